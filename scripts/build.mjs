@@ -1,0 +1,22 @@
+// Bundles the CLI (and, when present, the action entry) into dist/ as ESM files for Node 20+.
+import { build } from 'esbuild';
+import { existsSync } from 'node:fs';
+
+const entries = { cli: 'src/cli.ts', index: 'src/action.ts' };
+const entryPoints = Object.fromEntries(Object.entries(entries).filter(([, p]) => existsSync(p)));
+
+await build({
+  entryPoints,
+  outdir: 'dist',
+  bundle: true,
+  platform: 'node',
+  format: 'esm',
+  target: 'node20',
+  sourcemap: false,
+  legalComments: 'none',
+  logLevel: 'warning',
+  // Some CommonJS dependencies call require(); give the ESM bundle one.
+  banner: {
+    js: "import { createRequire as __fitgapCreateRequire } from 'node:module'; const require = __fitgapCreateRequire(import.meta.url);",
+  },
+});

@@ -1,0 +1,69 @@
+/**
+ * The run artifact, format `fitgap-run/1` (see schema/fitgap-run-1.schema.json).
+ * One JSON document per training run. The JSON Schema and these types agree; the schema is the
+ * source of truth for validation, these types are what the rest of the code sees once a document
+ * has passed it.
+ */
+
+/** `minimize` for error rate, RMSE, loss; `maximize` for accuracy, R², AUC. */
+export type Goal = 'minimize' | 'maximize';
+/** `proportion`: a rate over `examples` independent examples, in [0, 1]. */
+export type MetricKind = 'proportion' | 'continuous';
+export type SplitName = 'train' | 'train_dev' | 'validation' | 'test';
+export const SPLIT_NAMES: readonly SplitName[] = ['train', 'train_dev', 'validation', 'test'];
+
+export interface Metric {
+  name: string;
+  goal: Goal;
+  kind: MetricKind;
+}
+
+export interface Split {
+  /** Number of examples the value was measured on (needed for binomial noise on one repeat). */
+  examples?: number;
+  /** One value per repeat (seed); position i is the same trained model in every split. */
+  values: number[];
+}
+
+export interface CurvePoint {
+  x: number;
+  train?: number;
+  validation: number;
+}
+
+export type CurveName = 'epochs' | 'training_examples' | 'regularization';
+export const CURVE_NAMES: readonly CurveName[] = ['epochs', 'training_examples', 'regularization'];
+
+export type Curves = Partial<Record<CurveName, CurvePoint[]>>;
+
+export interface Slice {
+  name: string;
+  examples?: number;
+  train?: number;
+  validation: number;
+}
+
+export interface PredictionsRef {
+  split: SplitName;
+  /** Relative to the artifact's folder; must stay inside it. */
+  path: string;
+}
+
+export type Hyperparameters = Record<string, unknown>;
+
+export interface RunArtifact {
+  format: 'fitgap-run/1';
+  run: { name: string; commit?: string; createdAt?: string };
+  metric: Metric;
+  reference?: number;
+  splits: {
+    train: Split;
+    validation: Split;
+    train_dev?: Split;
+    test?: Split;
+  };
+  hyperparameters?: Hyperparameters;
+  curves?: Curves;
+  slices?: Slice[];
+  predictions?: PredictionsRef;
+}
