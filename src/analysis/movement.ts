@@ -1,0 +1,32 @@
+/** The headline: how the change moved the model in the bias/variance plane (DESIGN.md §5). Pure. */
+import type { Call, Movement, ValidationChange } from './types.js';
+
+const TABLE: Record<Call, Record<Call, Movement>> = {
+  down: { down: 'better-on-both', flat: 'away-from-underfitting', up: 'toward-overfitting' },
+  flat: { down: 'away-from-overfitting', flat: 'no-significant-change', up: 'toward-overfitting' },
+  up: { down: 'toward-underfitting', flat: 'toward-underfitting', up: 'worse-on-both' },
+};
+
+/** Movement from the calls on Δbias (rows) and Δvariance (columns), both in shortfall units. */
+export function movementOf(biasCall: Call, varianceCall: Call): Movement {
+  return TABLE[biasCall][varianceCall];
+}
+
+/** Validation change from the call on Δvalidation in shortfall units (up = worse). */
+export function validationChangeOf(shortfallCall: Call): ValidationChange {
+  return shortfallCall === 'up' ? 'worse' : shortfallCall === 'down' ? 'better' : 'flat';
+}
+
+/** The mirror image of a movement: what swapping baseline and candidate reports. */
+export function mirrorMovement(movement: Movement): Movement {
+  const mirror: Record<Movement, Movement> = {
+    'better-on-both': 'worse-on-both',
+    'worse-on-both': 'better-on-both',
+    'away-from-underfitting': 'toward-underfitting',
+    'toward-underfitting': 'away-from-underfitting',
+    'toward-overfitting': 'away-from-overfitting',
+    'away-from-overfitting': 'toward-overfitting',
+    'no-significant-change': 'no-significant-change',
+  };
+  return mirror[movement];
+}
