@@ -16,16 +16,23 @@ export interface ReferenceChoice {
 export function chooseReference(run: RunArtifact, override: number | undefined): ReferenceChoice {
   if (override !== undefined) return { value: override, source: 'config' };
   if (run.reference !== undefined) return { value: run.reference, source: 'artifact' };
-  if (run.metric.kind === 'proportion' && run.metric.goal === 'minimize') return { value: 0, source: 'default' };
+  if (run.metric.kind === 'proportion' && run.metric.goal === 'minimize')
+    return { value: 0, source: 'default' };
   return { value: null, source: 'unknown' };
 }
 
 /** The measures of each component for a run (null when a needed split or the reference is missing). */
-export function componentMeasures(run: RunArtifact, reference: number | null): Record<ComponentName, Measure | null> {
+export function componentMeasures(
+  run: RunArtifact,
+  reference: number | null,
+): Record<ComponentName, Measure | null> {
   const sign = shortfallSign(run);
   const hasDev = run.splits.train_dev !== undefined;
   return {
-    bias: reference === null ? null : { terms: [{ split: 'train', weight: 1 }], constant: -sign * reference },
+    bias:
+      reference === null
+        ? null
+        : { terms: [{ split: 'train', weight: 1 }], constant: -sign * reference },
     variance: {
       terms: [
         { split: hasDev ? 'train_dev' : 'validation', weight: 1 },
@@ -34,11 +41,23 @@ export function componentMeasures(run: RunArtifact, reference: number | null): R
       constant: 0,
     },
     mismatch: hasDev
-      ? { terms: [{ split: 'validation', weight: 1 }, { split: 'train_dev', weight: -1 }], constant: 0 }
+      ? {
+          terms: [
+            { split: 'validation', weight: 1 },
+            { split: 'train_dev', weight: -1 },
+          ],
+          constant: 0,
+        }
       : null,
     overfit:
       run.splits.test !== undefined
-        ? { terms: [{ split: 'test', weight: 1 }, { split: 'validation', weight: -1 }], constant: 0 }
+        ? {
+            terms: [
+              { split: 'test', weight: 1 },
+              { split: 'validation', weight: -1 },
+            ],
+            constant: 0,
+          }
         : null,
   };
 }
@@ -62,7 +81,11 @@ export interface DecomposeSettings {
   gapTolerance: number;
 }
 
-export function decompose(run: RunArtifact, reference: number | null, settings: DecomposeSettings): Record<ComponentName, Component> {
+export function decompose(
+  run: RunArtifact,
+  reference: number | null,
+  settings: DecomposeSettings,
+): Record<ComponentName, Component> {
   const measures = componentMeasures(run, reference);
   const threshold = Math.max(settings.gapTolerance * errorLevel(run), settings.minEffect);
   const out = {} as Record<ComponentName, Component>;
@@ -70,7 +93,14 @@ export function decompose(run: RunArtifact, reference: number | null, settings: 
     const measure = measures[name];
     const level = measure === null ? null : measureLevel(run, measure, settings.alpha);
     if (level === null) {
-      out[name] = { name, value: null, unavailable: UNAVAILABLE[name], ci: null, p: null, present: false };
+      out[name] = {
+        name,
+        value: null,
+        unavailable: UNAVAILABLE[name],
+        ci: null,
+        p: null,
+        present: false,
+      };
       continue;
     }
     const significant = level.p === null || level.p < settings.alpha;
@@ -92,7 +122,8 @@ export function diagnose(components: Record<ComponentName, Component>): Diagnosi
   const variance = components.variance;
   if (bias.present && variance.present && bias.value !== null && variance.value !== null) {
     const ratio = Math.max(bias.value, variance.value) / Math.min(bias.value, variance.value);
-    if (ratio <= 2 && (top.name === 'bias' || top.name === 'variance')) return 'high-bias-and-variance';
+    if (ratio <= 2 && (top.name === 'bias' || top.name === 'variance'))
+      return 'high-bias-and-variance';
   }
   if (top.name === 'bias') return 'high-bias';
   if (top.name === 'variance') return 'high-variance';

@@ -11,7 +11,8 @@ export function formatValue(value: number, kind: MetricKind): string {
 export function formatChange(value: number, kind: MetricKind): string {
   const sign = value > 0 ? '+' : value < 0 ? '−' : '±';
   const magnitude = Math.abs(value);
-  if (kind === 'proportion') return `${sign}${(magnitude * 100).toFixed(magnitude < 0.001 ? 2 : 1)} pts`;
+  if (kind === 'proportion')
+    return `${sign}${(magnitude * 100).toFixed(magnitude < 0.001 ? 2 : 1)} pts`;
   return `${sign}${formatNumber(magnitude)}`;
 }
 

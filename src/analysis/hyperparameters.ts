@@ -2,7 +2,10 @@
 import type { Hyperparameters } from '../artifact/types.js';
 import type { HyperparameterChange, LeverId } from './types.js';
 
-export function diffHyperparameters(baseline: Hyperparameters = {}, candidate: Hyperparameters = {}): HyperparameterChange[] {
+export function diffHyperparameters(
+  baseline: Hyperparameters = {},
+  candidate: Hyperparameters = {},
+): HyperparameterChange[] {
   const keys = [...new Set([...Object.keys(baseline), ...Object.keys(candidate)])].sort();
   const out: HyperparameterChange[] = [];
   for (const key of keys) {
@@ -15,21 +18,29 @@ export function diffHyperparameters(baseline: Hyperparameters = {}, candidate: H
     else if (typeof b === 'number' && typeof c === 'number') {
       if (c > b) out.push({ key, baseline: b, candidate: c, kind: 'raised' });
       else if (c < b) out.push({ key, baseline: b, candidate: c, kind: 'lowered' });
-    } else if (JSON.stringify(b) !== JSON.stringify(c)) out.push({ key, baseline: b, candidate: c, kind: 'changed' });
+    } else if (JSON.stringify(b) !== JSON.stringify(c))
+      out.push({ key, baseline: b, candidate: c, kind: 'changed' });
   }
   return out;
 }
 
 /** What a hyperparameter controls, recognised from common names (common practice). */
-export type Knob = 'regularization' | 'features' | 'feature-richness' | 'data' | 'epochs' | 'model-size';
+export type Knob =
+  'regularization' | 'features' | 'feature-richness' | 'data' | 'epochs' | 'model-size';
 
 const KNOBS: [RegExp, Knob][] = [
-  [/^(lambda|l2|l2_penalty|weight_decay|reg(ularization)?(_strength)?|ridge_alpha|dropout)$/i, 'regularization'],
+  [
+    /^(lambda|l2|l2_penalty|weight_decay|reg(ularization)?(_strength)?|ridge_alpha|dropout)$/i,
+    'regularization',
+  ],
   [/^(features|num_features|n_features|feature_count)$/i, 'features'],
   [/^(polynomial_degree|poly_degree|degree|interaction_terms)$/i, 'feature-richness'],
   [/^(train_examples|training_examples|n_train|train_size|num_train)$/i, 'data'],
   [/^(epochs|max_epochs|num_epochs|iterations|max_iter|steps)$/i, 'epochs'],
-  [/^(hidden_units|hidden_size|layers|num_layers|depth|max_depth|width|params|parameters|model_size|n_estimators)$/i, 'model-size'],
+  [
+    /^(hidden_units|hidden_size|layers|num_layers|depth|max_depth|width|params|parameters|model_size|n_estimators)$/i,
+    'model-size',
+  ],
 ];
 
 export function knobOf(key: string): Knob | null {

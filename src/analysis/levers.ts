@@ -4,10 +4,23 @@
  * Pure.
  */
 import type { MetricKind } from '../artifact/types.js';
-import type { CurvesReport, LearningCurveEvidence, RegularizationEvidence, EpochsEvidence } from './curves/types.js';
+import type {
+  CurvesReport,
+  LearningCurveEvidence,
+  RegularizationEvidence,
+  EpochsEvidence,
+} from './curves/types.js';
 import { formatChange, formatNumber, formatValue } from './format.js';
 import { knobOf, type PulledLever } from './hyperparameters.js';
-import type { Delta, Diagnosis, HyperparameterChange, Lever, LeverId, Movement, RunSummary } from './types.js';
+import type {
+  Delta,
+  Diagnosis,
+  HyperparameterChange,
+  Lever,
+  LeverId,
+  Movement,
+  RunSummary,
+} from './types.js';
 
 export type Target = 'variance' | 'bias' | 'mismatch' | 'validation-overfit' | 'evidence';
 
@@ -15,7 +28,10 @@ export type Target = 'variance' | 'bias' | 'mismatch' | 'validation-overfit' | '
 export const LEVER_CATALOGUE: Record<LeverId, { addresses: Target; meaning: string }> = {
   'more-data': { addresses: 'variance', meaning: 'train on more examples' },
   'fewer-features': { addresses: 'variance', meaning: 'drop weak or redundant features' },
-  'stronger-regularization': { addresses: 'variance', meaning: 'raise the regularization strength' },
+  'stronger-regularization': {
+    addresses: 'variance',
+    meaning: 'raise the regularization strength',
+  },
   'smaller-model': { addresses: 'variance', meaning: 'reduce model capacity' },
   'early-stopping': { addresses: 'variance', meaning: 'stop at the validation minimum' },
   'more-features': { addresses: 'bias', meaning: 'add informative features' },
@@ -23,15 +39,33 @@ export const LEVER_CATALOGUE: Record<LeverId, { addresses: Target; meaning: stri
   'weaker-regularization': { addresses: 'bias', meaning: 'lower the regularization strength' },
   'bigger-model': { addresses: 'bias', meaning: 'increase model capacity' },
   'train-longer': { addresses: 'bias', meaning: 'train for more epochs' },
-  'align-training-data': { addresses: 'mismatch', meaning: 'make training data look like validation data' },
-  'bigger-validation-set': { addresses: 'validation-overfit', meaning: 'enlarge or refresh the validation set' },
+  'align-training-data': {
+    addresses: 'mismatch',
+    meaning: 'make training data look like validation data',
+  },
+  'bigger-validation-set': {
+    addresses: 'validation-overfit',
+    meaning: 'enlarge or refresh the validation set',
+  },
   'add-repeats': { addresses: 'evidence', meaning: 'repeat training with other seeds' },
   'supply-reference': { addresses: 'evidence', meaning: 'give a reference level' },
 };
 
 const BY_TARGET: Record<'variance' | 'bias', LeverId[]> = {
-  variance: ['more-data', 'stronger-regularization', 'fewer-features', 'early-stopping', 'smaller-model'],
-  bias: ['richer-features', 'more-features', 'weaker-regularization', 'bigger-model', 'train-longer'],
+  variance: [
+    'more-data',
+    'stronger-regularization',
+    'fewer-features',
+    'early-stopping',
+    'smaller-model',
+  ],
+  bias: [
+    'richer-features',
+    'more-features',
+    'weaker-regularization',
+    'bigger-model',
+    'train-longer',
+  ],
 };
 
 /** Shrinking the training set lowers training error but does not cure high bias (common practice). */
@@ -92,7 +126,8 @@ export function chooseLevers(ctx: LeverContext): { levers: Lever[]; nonLevers: s
   const drafts = new Map<LeverId, Draft>();
   const add = (id: LeverId, score: number, reason: string, evidence: string[] = []): void => {
     const existing = drafts.get(id);
-    if (existing === undefined || existing.score < score) drafts.set(id, { id, reason, evidence, score });
+    if (existing === undefined || existing.score < score)
+      drafts.set(id, { id, reason, evidence, score });
   };
   const pulled = new Map(ctx.pulled.map((p) => [p.lever, p]));
   const pulledNote = (id: LeverId): string | null => {
@@ -106,18 +141,45 @@ export function chooseLevers(ctx: LeverContext): { levers: Lever[]; nonLevers: s
     const { baseline: from, candidate: to } = p.change;
     if (typeof from !== 'number' || typeof to !== 'number') continue;
     const between = from > 0 && to > 0 ? Math.sqrt(from * to) : (from + to) / 2;
-    const overshotTowardBias = ctx.movement === 'toward-underfitting' || ctx.movement === 'worse-on-both';
-    const overshotTowardVariance = ctx.movement === 'toward-overfitting' || ctx.movement === 'worse-on-both';
+    const overshotTowardBias =
+      ctx.movement === 'toward-underfitting' || ctx.movement === 'worse-on-both';
+    const overshotTowardVariance =
+      ctx.movement === 'toward-overfitting' || ctx.movement === 'worse-on-both';
     if (p.lever === 'stronger-regularization' && overshotTowardBias) {
-      add('weaker-regularization', 100, `${p.change.key} rose ${from} → ${to} and moved the model toward underfitting (Δbias ${formatChange(ctx.bias.estimate, kind)}); try ${p.change.key} ≈ ${formatNumber(between)}, between the two.`, [`Δbias ${formatChange(ctx.bias.estimate, kind)}, p ${formatP(ctx.bias.p)}`]);
+      add(
+        'weaker-regularization',
+        100,
+        `${p.change.key} rose ${from} → ${to} and moved the model toward underfitting (Δbias ${formatChange(ctx.bias.estimate, kind)}); try ${p.change.key} ≈ ${formatNumber(between)}, between the two.`,
+        [`Δbias ${formatChange(ctx.bias.estimate, kind)}, p ${formatP(ctx.bias.p)}`],
+      );
     }
-    if ((p.lever === 'weaker-regularization') && overshotTowardVariance) {
-      add('stronger-regularization', 100, `${p.change.key} fell ${from} → ${to} and moved the model toward overfitting (Δvariance ${formatChange(ctx.variance.estimate, kind)}); try ${p.change.key} ≈ ${formatNumber(between)}, between the two.`, [`Δvariance ${formatChange(ctx.variance.estimate, kind)}, p ${formatP(ctx.variance.p)}`]);
+    if (p.lever === 'weaker-regularization' && overshotTowardVariance) {
+      add(
+        'stronger-regularization',
+        100,
+        `${p.change.key} fell ${from} → ${to} and moved the model toward overfitting (Δvariance ${formatChange(ctx.variance.estimate, kind)}); try ${p.change.key} ≈ ${formatNumber(between)}, between the two.`,
+        [`Δvariance ${formatChange(ctx.variance.estimate, kind)}, p ${formatP(ctx.variance.p)}`],
+      );
     }
-    if ((p.lever === 'richer-features' || p.lever === 'more-features' || p.lever === 'bigger-model') && overshotTowardVariance) {
+    if (
+      (p.lever === 'richer-features' ||
+        p.lever === 'more-features' ||
+        p.lever === 'bigger-model') &&
+      overshotTowardVariance
+    ) {
       const back: LeverId = p.lever === 'bigger-model' ? 'smaller-model' : 'fewer-features';
-      add(back, 90, `${p.change.key} rose ${from} → ${to} and moved the model toward overfitting (Δvariance ${formatChange(ctx.variance.estimate, kind)}); step back toward ${formatNumber(between)} or keep it and regularize harder.`, [`Δvariance ${formatChange(ctx.variance.estimate, kind)}`]);
-      add('stronger-regularization', 85, `Keep the new ${p.change.key} but counter its extra variance with stronger regularization.`, []);
+      add(
+        back,
+        90,
+        `${p.change.key} rose ${from} → ${to} and moved the model toward overfitting (Δvariance ${formatChange(ctx.variance.estimate, kind)}); step back toward ${formatNumber(between)} or keep it and regularize harder.`,
+        [`Δvariance ${formatChange(ctx.variance.estimate, kind)}`],
+      );
+      add(
+        'stronger-regularization',
+        85,
+        `Keep the new ${p.change.key} but counter its extra variance with stronger regularization.`,
+        [],
+      );
     }
   }
 
@@ -125,7 +187,10 @@ export function chooseLevers(ctx: LeverContext): { levers: Lever[]; nonLevers: s
   const order = targets(ctx.candidate.diagnosis, ctx.candidate);
   order.forEach((target, t) => {
     const component = ctx.candidate.components[target];
-    const size = component.value === null ? '' : ` (${target} ${v(component.value)} of validation error ${v(ctx.candidate.errorLevel)})`;
+    const size =
+      component.value === null
+        ? ''
+        : ` (${target} ${v(component.value)} of validation error ${v(ctx.candidate.errorLevel)})`;
     BY_TARGET[target].forEach((id, i) => {
       let score = 60 - t * 20 - i * 2;
       let reason = `${LEVER_CATALOGUE[id].meaning[0]?.toUpperCase()}${LEVER_CATALOGUE[id].meaning.slice(1)}: the candidate shows high ${target}${size}.`;
@@ -137,7 +202,9 @@ export function chooseLevers(ctx: LeverContext): { levers: Lever[]; nonLevers: s
         const twice = lc.projections[0];
         if (twice !== undefined) {
           reason = `2× data projects validation ${ctx.metricName} ${v(ctx.candidate.splits.find((s) => s.split === 'validation')?.mean ?? 0)} → ${v(twice.validation)} (power-law fit R² ${lc.r2.toFixed(2)}).`;
-          evidence.push(`fit e(m) = ${formatNumber(lc.a)}·m^−${formatNumber(lc.b)} + ${formatNumber(lc.c)}; at ${formatNumber(twice.x)} examples: ${v(twice.ci[0])} to ${v(twice.ci[1])}`);
+          evidence.push(
+            `fit e(m) = ${formatNumber(lc.a)}·m^−${formatNumber(lc.b)} + ${formatNumber(lc.c)}; at ${formatNumber(twice.x)} examples: ${v(twice.ci[0])} to ${v(twice.ci[1])}`,
+          );
         }
         if (lc.gapTrend === 'flat') {
           score -= 25;
@@ -147,7 +214,9 @@ export function chooseLevers(ctx: LeverContext): { levers: Lever[]; nonLevers: s
       if ((id === 'stronger-regularization' || id === 'weaker-regularization') && reg !== null) {
         const wants = id === 'stronger-regularization' ? 'below' : 'above';
         if (reg.atEdge !== null) {
-          evidence.push(`the sweep's minimum is at its ${reg.atEdge} end (${formatNumber(reg.bestX)}): extend the sweep`);
+          evidence.push(
+            `the sweep's minimum is at its ${reg.atEdge} end (${formatNumber(reg.bestX)}): extend the sweep`,
+          );
         }
         if (reg.side === wants) {
           score += 10;
@@ -181,23 +250,40 @@ export function chooseLevers(ctx: LeverContext): { levers: Lever[]; nonLevers: s
 
   if (ctx.candidate.diagnosis === 'data-mismatch' || ctx.candidate.components.mismatch.present) {
     const d = ctx.candidate.components.mismatch.value ?? 0;
-    add('align-training-data', ctx.candidate.diagnosis === 'data-mismatch' ? 70 : 30, `Validation error exceeds train_dev error by ${v(d)}: the training data does not look like the validation data; collect or synthesise training data that resembles it.`);
+    add(
+      'align-training-data',
+      ctx.candidate.diagnosis === 'data-mismatch' ? 70 : 30,
+      `Validation error exceeds train_dev error by ${v(d)}: the training data does not look like the validation data; collect or synthesise training data that resembles it.`,
+    );
   }
   if (ctx.candidate.components.overfit.present) {
-    add('bigger-validation-set', 40, `Test error exceeds validation error by ${v(ctx.candidate.components.overfit.value ?? 0)}: choices may be tuned to the validation set; enlarge or refresh it.`);
+    add(
+      'bigger-validation-set',
+      40,
+      `Test error exceeds validation error by ${v(ctx.candidate.components.overfit.value ?? 0)}: choices may be tuned to the validation set; enlarge or refresh it.`,
+    );
   }
   if (ctx.candidate.biasUnknown) {
-    add('supply-reference', 20, 'Bias is unknown without a reference level: add "reference" (human-level error, a prior system, or an estimated Bayes error) to the artifacts or the config.');
+    add(
+      'supply-reference',
+      20,
+      'Bias is unknown without a reference level: add "reference" (human-level error, a prior system, or an estimated Bayes error) to the artifacts or the config.',
+    );
   }
   if (ctx.noiseUnknown) {
-    add('add-repeats', 15, 'Run-to-run noise is unknown: train with 2 or more seeds (or ship per-example predictions) so changes can be tested.');
+    add(
+      'add-repeats',
+      15,
+      'Run-to-run noise is unknown: train with 2 or more seeds (or ship per-example predictions) so changes can be tested.',
+    );
   }
 
   const levers = [...drafts.values()]
     .sort((a, b) => b.score - a.score)
     .map(({ id, reason, evidence }) => ({ id, reason, evidence }));
   const nonLevers: string[] = [];
-  const biasy = ctx.candidate.diagnosis === 'high-bias' || ctx.candidate.diagnosis === 'high-bias-and-variance';
+  const biasy =
+    ctx.candidate.diagnosis === 'high-bias' || ctx.candidate.diagnosis === 'high-bias-and-variance';
   const shrank = ctx.changes.some((c) => c.kind === 'lowered' && knobOf(c.key) === 'data');
   if (biasy || shrank) nonLevers.push(SMALLER_TRAINING_SET_NOTE);
   return { levers, nonLevers };

@@ -58,7 +58,8 @@ export function binomialMeasureVariance(run: RunArtifact, measure: Measure): num
     if (split?.examples === undefined) return null;
     const repeats = split.values.length;
     // The mean over repeats of one split pools repeats × examples trials.
-    total += term.weight * term.weight * binomialVariance(mean(split.values), split.examples * repeats);
+    total +=
+      term.weight * term.weight * binomialVariance(mean(split.values), split.examples * repeats);
   }
   return total;
 }

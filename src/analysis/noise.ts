@@ -16,14 +16,19 @@ export interface CallSettings {
 /** `up`/`down` only when significant at alpha and at least min-effect; unknown noise uses min-effect alone (when set). */
 export function callOf(result: TestResult, settings: CallSettings): Call {
   const big = Math.abs(result.estimate) >= settings.minEffect && result.estimate !== 0;
-  const significant =
-    result.p === null ? settings.minEffect > 0 : result.p < settings.alpha;
+  const significant = result.p === null ? settings.minEffect > 0 : result.p < settings.alpha;
   if (!big || !significant) return 'flat';
   return result.estimate > 0 ? 'up' : 'down';
 }
 
 export function toDelta(result: TestResult, settings: CallSettings): Delta {
-  return { estimate: result.estimate, ci: result.ci, p: result.p, test: result.test, call: callOf(result, settings) };
+  return {
+    estimate: result.estimate,
+    ci: result.ci,
+    p: result.p,
+    test: result.test,
+    call: callOf(result, settings),
+  };
 }
 
 /** Candidate − baseline of a measure (shortfall units), or null when either run lacks a split. */

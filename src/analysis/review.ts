@@ -4,10 +4,23 @@
  */
 import type { RunArtifact, SplitName } from '../artifact/types.js';
 import { SPLIT_NAMES } from '../artifact/types.js';
-import { mcnemarExact, mean, pairedT, sampleVariance, tQuantile, wilsonInterval } from '../stats/index.js';
+import {
+  mcnemarExact,
+  mean,
+  pairedT,
+  sampleVariance,
+  tQuantile,
+  wilsonInterval,
+} from '../stats/index.js';
 import type { Interval, TestResult } from '../stats/types.js';
 import { analyzeCurves } from './curves/index.js';
-import { chooseReference, componentMeasures, decompose, diagnose, errorLevel } from './decompose.js';
+import {
+  chooseReference,
+  componentMeasures,
+  decompose,
+  diagnose,
+  errorLevel,
+} from './decompose.js';
 import { formatValue } from './format.js';
 import { applyGate } from './gate.js';
 import { diffHyperparameters, knobOf, pulledLevers } from './hyperparameters.js';
@@ -16,7 +29,14 @@ import { shortfallSign, splitMeasure, type Measure } from './measure.js';
 import { movementOf, validationChangeOf } from './movement.js';
 import { measureChange, toDelta, toMetricUnits, type CallSettings } from './noise.js';
 import { compareSlices } from './slices.js';
-import type { Delta, Review, ReviewSettings, RunSummary, SplitChange, SplitSummary } from './types.js';
+import type {
+  Delta,
+  Review,
+  ReviewSettings,
+  RunSummary,
+  SplitChange,
+  SplitSummary,
+} from './types.js';
 
 /** Summary of paired per-example predictions, computed by the streaming CSV reader. */
 export interface PairedPredictions {
@@ -61,7 +81,8 @@ function splitSummary(run: RunArtifact, split: SplitName, alpha: number): SplitS
 
 function lambdaOf(run: RunArtifact): number | undefined {
   for (const [key, value] of Object.entries(run.hyperparameters ?? {})) {
-    if (typeof value === 'number' && knobOf(key) === 'regularization' && !/dropout/i.test(key)) return value;
+    if (typeof value === 'number' && knobOf(key) === 'regularization' && !/dropout/i.test(key))
+      return value;
   }
   return undefined;
 }
@@ -72,7 +93,9 @@ function summarize(run: RunArtifact, settings: ReviewInput['settings']): RunSumm
   const diagnosis = diagnose(components);
   const warnings: string[] = [];
   if (components.overfit.present) {
-    warnings.push('Test error is well above validation error: model choices may be tuned to the validation set.');
+    warnings.push(
+      'Test error is well above validation error: model choices may be tuned to the validation set.',
+    );
   }
   const lambda = lambdaOf(run);
   return {
@@ -87,7 +110,11 @@ function summarize(run: RunArtifact, settings: ReviewInput['settings']): RunSumm
     diagnosis,
     biasUnknown: reference.value === null,
     warnings,
-    curves: analyzeCurves(run.curves, { ...(lambda === undefined ? {} : { lambda }), kind: run.metric.kind, goal: run.metric.goal }),
+    curves: analyzeCurves(run.curves, {
+      ...(lambda === undefined ? {} : { lambda }),
+      kind: run.metric.kind,
+      goal: run.metric.goal,
+    }),
   };
 }
 
@@ -96,11 +123,19 @@ function pairedTest(paired: PairedPredictions, run: RunArtifact, alpha: number):
   if (paired.rows === 0) return null;
   if (paired.kind === 'proportion') {
     // mcnemarExact's estimate is the change in the proportion correct.
-    const result = mcnemarExact(paired.baselineOnly ?? 0, paired.candidateOnly ?? 0, paired.rows, alpha);
+    const result = mcnemarExact(
+      paired.baselineOnly ?? 0,
+      paired.candidateOnly ?? 0,
+      paired.rows,
+      alpha,
+    );
     // A minimized proportion metric counts errors: its change is the negative.
     return run.metric.goal === 'minimize' ? toMetricUnits(result, -1) : result;
   }
-  return pairedT({ n: paired.rows, mean: paired.meanDiff ?? 0, variance: paired.varDiff ?? 0 }, alpha);
+  return pairedT(
+    { n: paired.rows, mean: paired.meanDiff ?? 0, variance: paired.varDiff ?? 0 },
+    alpha,
+  );
 }
 
 function both(measure: Measure): { baseline: Measure; candidate: Measure } {
@@ -110,7 +145,12 @@ function both(measure: Measure): { baseline: Measure; candidate: Measure } {
 function flip(delta: Delta, sign: 1 | -1): Delta {
   if (sign === 1) return delta;
   const call = delta.call === 'up' ? 'down' : delta.call === 'down' ? 'up' : 'flat';
-  return { ...delta, estimate: -delta.estimate, ci: delta.ci === null ? null : [-delta.ci[1], -delta.ci[0]], call };
+  return {
+    ...delta,
+    estimate: -delta.estimate,
+    ci: delta.ci === null ? null : [-delta.ci[1], -delta.ci[0]],
+    call,
+  };
 }
 
 export function buildReview(input: ReviewInput): Review {
@@ -129,7 +169,9 @@ export function buildReview(input: ReviewInput): Review {
     let result = measureChange(baseline, candidate, both(splitMeasure(split)), settings.alpha);
     if (result === null) continue;
     const usePaired =
-      input.paired !== undefined && split === pairedSplit && (result.test === 'none' || result.test === 'z-binomial');
+      input.paired !== undefined &&
+      split === pairedSplit &&
+      (result.test === 'none' || result.test === 'z-binomial');
     if (usePaired && input.paired !== undefined) {
       const paired = pairedTest(input.paired, candidate, settings.alpha);
       if (paired !== null) result = toMetricUnits(paired, sign);
@@ -137,7 +179,8 @@ export function buildReview(input: ReviewInput): Review {
     shortfallChanges.set(split, result);
   }
   const validationShortfall = shortfallChanges.get('validation');
-  if (validationShortfall === undefined) throw new Error('validation split is required by the schema');
+  if (validationShortfall === undefined)
+    throw new Error('validation split is required by the schema');
   const validationDelta = toDelta(validationShortfall, calls);
 
   const splits: SplitChange[] = [];
@@ -145,26 +188,48 @@ export function buildReview(input: ReviewInput): Review {
     const b = base.splits.find((s) => s.split === split);
     const c = cand.splits.find((s) => s.split === split);
     if (b === undefined || c === undefined) continue;
-    splits.push({ split, baseline: b.mean, candidate: c.mean, delta: flip(toDelta(result, calls), sign) });
+    splits.push({
+      split,
+      baseline: b.mean,
+      candidate: c.mean,
+      delta: flip(toDelta(result, calls), sign),
+    });
   }
 
   // Component changes. Bias change needs no reference when both runs share it (or lack it).
   const refB = base.reference;
   const refC = cand.reference;
-  const biasMeasure = (run: RunArtifact, ref: number | null): Measure => componentMeasures(run, ref ?? 0).bias ?? splitMeasure('train');
+  const biasMeasure = (run: RunArtifact, ref: number | null): Measure =>
+    componentMeasures(run, ref ?? 0).bias ?? splitMeasure('train');
   const useRefs = refB !== null && refC !== null;
-  const biasResult = measureChange(baseline, candidate, {
-    baseline: biasMeasure(baseline, useRefs ? refB : 0),
-    candidate: biasMeasure(candidate, useRefs ? refC : 0),
-  }, settings.alpha);
+  const biasResult = measureChange(
+    baseline,
+    candidate,
+    {
+      baseline: biasMeasure(baseline, useRefs ? refB : 0),
+      candidate: biasMeasure(candidate, useRefs ? refC : 0),
+    },
+    settings.alpha,
+  );
   const componentChange = (name: 'variance' | 'mismatch' | 'overfit'): Delta | null => {
     const mb = componentMeasures(baseline, refB)[name];
     const mc = componentMeasures(candidate, refC)[name];
     if (mb === null || mc === null) return null;
     // Variance must mean the same thing in both runs (train_dev in both, or in neither).
-    if (name === 'variance' && (baseline.splits.train_dev === undefined) !== (candidate.splits.train_dev === undefined)) {
-      const fallback: Measure = { terms: [{ split: 'validation', weight: 1 }, { split: 'train', weight: -1 }], constant: 0 };
-      notes.push('Only one run has a train_dev split: the variance change is measured as validation − train in both.');
+    if (
+      name === 'variance' &&
+      (baseline.splits.train_dev === undefined) !== (candidate.splits.train_dev === undefined)
+    ) {
+      const fallback: Measure = {
+        terms: [
+          { split: 'validation', weight: 1 },
+          { split: 'train', weight: -1 },
+        ],
+        constant: 0,
+      };
+      notes.push(
+        'Only one run has a train_dev split: the variance change is measured as validation − train in both.',
+      );
       const r = measureChange(baseline, candidate, both(fallback), settings.alpha);
       return r === null ? null : toDelta(r, calls);
     }
@@ -173,17 +238,25 @@ export function buildReview(input: ReviewInput): Review {
   };
   const biasDelta = biasResult === null ? null : toDelta(biasResult, calls);
   const varianceDelta = componentChange('variance');
-  if (varianceDelta === null) throw new Error('variance needs train and validation, which the schema requires');
+  if (varianceDelta === null)
+    throw new Error('variance needs train and validation, which the schema requires');
   const movement = movementOf(biasDelta?.call ?? 'flat', varianceDelta.call);
   const validationChange = validationChangeOf(validationDelta.call);
 
   const sliceResult = compareSlices(baseline, candidate, validationChange, calls);
   if (sliceResult.unpaired.length > 0) {
-    notes.push(`${sliceResult.unpaired.length} slice(s) appear in one run only and were not compared: ${sliceResult.unpaired.slice(0, 5).join(', ')}${sliceResult.unpaired.length > 5 ? ', …' : ''}.`);
+    notes.push(
+      `${sliceResult.unpaired.length} slice(s) appear in one run only and were not compared: ${sliceResult.unpaired.slice(0, 5).join(', ')}${sliceResult.unpaired.length > 5 ? ', …' : ''}.`,
+    );
   }
   const hidden = sliceResult.slices.filter((s) => s.hiddenRegression);
   if (hidden.length > 0) {
-    notes.push(`Validation improved overall, yet ${hidden.length} slice(s) regressed significantly (Holm-adjusted): ${hidden.slice(0, 5).map((s) => s.name).join(', ')}.`);
+    notes.push(
+      `Validation improved overall, yet ${hidden.length} slice(s) regressed significantly (Holm-adjusted): ${hidden
+        .slice(0, 5)
+        .map((s) => s.name)
+        .join(', ')}.`,
+    );
   }
 
   const noiseUnknown = validationDelta.test === 'none' || varianceDelta.test === 'none';
@@ -195,7 +268,9 @@ export function buildReview(input: ReviewInput): Review {
     );
   }
   if (cand.biasUnknown) {
-    notes.push('Avoidable bias is unknown: there is no reference level for this metric. Its change is still measured from the training error; the diagnosis rests on variance and data mismatch.');
+    notes.push(
+      'Avoidable bias is unknown: there is no reference level for this metric. Its change is still measured from the training error; the diagnosis rests on variance and data mismatch.',
+    );
   }
   if (input.paired !== undefined && input.paired.rows === 0) {
     notes.push('The two predictions files share no id: the paired test was not used.');
@@ -222,18 +297,30 @@ export function buildReview(input: ReviewInput): Review {
     validation: { change: validationChange, delta: flip(validationDelta, sign) },
     slices: sliceResult.slices,
     candidate: cand,
-    settings: { alpha: settings.alpha, minEffect: settings.minEffect, gapTolerance: settings.gapTolerance, failOn: [...settings.failOn] },
+    settings: {
+      alpha: settings.alpha,
+      minEffect: settings.minEffect,
+      gapTolerance: settings.gapTolerance,
+      failOn: [...settings.failOn],
+    },
   };
   const gate = applyGate(partial);
-  const paired = input.paired === undefined
-    ? null
-    : {
-        rows: input.paired.rows,
-        test: input.paired.kind === 'proportion' ? ('mcnemar-exact' as const) : ('paired-t' as const),
-        ...(input.paired.kind === 'proportion'
-          ? { discordant: { baselineOnly: input.paired.baselineOnly ?? 0, candidateOnly: input.paired.candidateOnly ?? 0 } }
-          : {}),
-      };
+  const paired =
+    input.paired === undefined
+      ? null
+      : {
+          rows: input.paired.rows,
+          test:
+            input.paired.kind === 'proportion' ? ('mcnemar-exact' as const) : ('paired-t' as const),
+          ...(input.paired.kind === 'proportion'
+            ? {
+                discordant: {
+                  baselineOnly: input.paired.baselineOnly ?? 0,
+                  candidateOnly: input.paired.candidateOnly ?? 0,
+                },
+              }
+            : {}),
+        };
 
   return {
     format: 'fitgap-review/1',

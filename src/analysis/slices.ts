@@ -11,7 +11,8 @@ import type { SliceChange, ValidationChange } from './types.js';
 function sliceTest(b: Slice, c: Slice, proportion: boolean, alpha: number): TestResult {
   const estimate = c.validation - b.validation;
   if (proportion && b.examples !== undefined && c.examples !== undefined) {
-    const variance = binomialVariance(b.validation, b.examples) + binomialVariance(c.validation, c.examples);
+    const variance =
+      binomialVariance(b.validation, b.examples) + binomialVariance(c.validation, c.examples);
     return normalTest(estimate, variance, alpha, 'z-binomial');
   }
   return { estimate, ci: null, p: null, test: 'none' };
@@ -46,13 +47,20 @@ export function compareSlices(
     const pAdjusted = adjusted[i] ?? null;
     const call = callOf({ ...test, p: pAdjusted }, settings);
     // call is on the metric value; for a minimized metric 'up' is worse.
-    const change: ValidationChange = call === 'flat' ? 'flat' : (call === 'up') === (sign === 1) ? 'worse' : 'better';
+    const change: ValidationChange =
+      call === 'flat' ? 'flat' : (call === 'up') === (sign === 1) ? 'worse' : 'better';
     return {
       name: c.name,
       examples: c.examples ?? null,
       baseline: b.validation,
       candidate: c.validation,
-      delta: { estimate: test.estimate, ci: test.ci, p: test.p, test: test.test, call: callOf(test, settings) },
+      delta: {
+        estimate: test.estimate,
+        ci: test.ci,
+        p: test.p,
+        test: test.test,
+        call: callOf(test, settings),
+      },
       pAdjusted,
       change,
       hiddenRegression: change === 'worse' && aggregate === 'better',

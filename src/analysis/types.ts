@@ -30,11 +30,7 @@ export type Movement =
 export type ValidationChange = 'better' | 'worse' | 'flat';
 
 export type Diagnosis =
-  | 'good-fit'
-  | 'high-bias'
-  | 'high-variance'
-  | 'data-mismatch'
-  | 'high-bias-and-variance';
+  'good-fit' | 'high-bias' | 'high-variance' | 'data-mismatch' | 'high-bias-and-variance';
 
 export type ComponentName = 'bias' | 'variance' | 'mismatch' | 'overfit';
 
@@ -176,5 +172,9 @@ export interface Review {
   /** Plain statements about what could not be known and what to supply. */
   notes: string[];
   /** Paired-prediction evidence on the validation change, when both runs shipped predictions. */
-  paired: { rows: number; test: TestName; discordant?: { baselineOnly: number; candidateOnly: number } } | null;
+  paired: {
+    rows: number;
+    test: TestName;
+    discordant?: { baselineOnly: number; candidateOnly: number };
+  } | null;
 }

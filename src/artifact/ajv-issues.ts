@@ -79,10 +79,17 @@ function oneIssue(error: ErrorObject, file: string, doc: unknown): Issue {
         pointer,
         expected: `must be a ${String(params['format'])} string`,
         got: quote(value),
-        ...(params['format'] === 'date-time' ? { hint: 'Use RFC 3339, e.g. "2026-11-30T10:00:00Z".' } : {}),
+        ...(params['format'] === 'date-time'
+          ? { hint: 'Use RFC 3339, e.g. "2026-11-30T10:00:00Z".' }
+          : {}),
       };
     default:
-      return { file, pointer, expected: error.message ?? `fails ${error.keyword}`, got: quote(value) };
+      return {
+        file,
+        pointer,
+        expected: error.message ?? `fails ${error.keyword}`,
+        got: quote(value),
+      };
   }
 }
 
@@ -103,7 +110,8 @@ export function ajvIssues(errors: readonly ErrorObject[], file: string, doc: unk
 /** Pointers of every number in a document that is not finite (JSON `1e999` parses to Infinity). */
 export function nonFiniteNumbers(doc: unknown, pointer = ''): string[] {
   if (typeof doc === 'number') return Number.isFinite(doc) ? [] : [pointer];
-  if (Array.isArray(doc)) return doc.flatMap((item, i) => nonFiniteNumbers(item, `${pointer}/${i}`));
+  if (Array.isArray(doc))
+    return doc.flatMap((item, i) => nonFiniteNumbers(item, `${pointer}/${i}`));
   if (doc !== null && typeof doc === 'object') {
     return Object.entries(doc).flatMap(([k, v]) =>
       nonFiniteNumbers(v, `${pointer}/${escapePointerToken(k)}`),

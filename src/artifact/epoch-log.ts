@@ -43,7 +43,12 @@ export function parseEpochLog(text: string, file: string, mapping: EpochLogMappi
       const cell = cells[index] ?? '';
       const value = cell === '' ? Number.NaN : Number(cell);
       if (!Number.isFinite(value)) {
-        issues.push({ file, pointer: `line ${i + 1}`, expected: `column "${name}" must be a finite number`, got: quote(cell) });
+        issues.push({
+          file,
+          pointer: `line ${i + 1}`,
+          expected: `column "${name}" must be a finite number`,
+          got: quote(cell),
+        });
       }
       return value;
     };
@@ -51,12 +56,18 @@ export function parseEpochLog(text: string, file: string, mapping: EpochLogMappi
     if (ti !== undefined && mapping.train !== undefined) point.train = read(ti, mapping.train);
     const previous = points[points.length - 1];
     if (previous !== undefined && Number.isFinite(point.x) && !(point.x > previous.x)) {
-      issues.push({ file, pointer: `line ${i + 1}`, expected: `column "${mapping.x}" must strictly increase (previous ${previous.x})`, got: quote(point.x) });
+      issues.push({
+        file,
+        pointer: `line ${i + 1}`,
+        expected: `column "${mapping.x}" must strictly increase (previous ${previous.x})`,
+        got: quote(point.x),
+      });
     }
     points.push(point);
     if (issues.length >= 10) break;
   }
   if (issues.length > 0) throw new InputError(issues);
-  if (points.length === 0) throw new InputError([{ file, pointer: '', expected: 'has no data rows under its header' }]);
+  if (points.length === 0)
+    throw new InputError([{ file, pointer: '', expected: 'has no data rows under its header' }]);
   return points;
 }

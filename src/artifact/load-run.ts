@@ -33,7 +33,12 @@ async function readText(path: string, file: string, what: string): Promise<Buffe
         file,
         pointer: '',
         expected: `could not be read as ${what}`,
-        got: code === 'ENOENT' ? 'no such file' : code === 'EISDIR' ? 'a directory' : (code ?? String(error)),
+        got:
+          code === 'ENOENT'
+            ? 'no such file'
+            : code === 'EISDIR'
+              ? 'a directory'
+              : (code ?? String(error)),
         hint: 'Check the path.',
       },
     ]);
@@ -45,11 +50,20 @@ function besideArtifact(artifactPath: string, name: string): string | null {
   const folder = resolve(dirname(artifactPath));
   const target = resolve(folder, name);
   const rel = relative(folder, target);
-  if (rel === '' || rel.startsWith('..') || rel.includes(`..${sep}`) || resolve(folder, rel) !== target) return null;
+  if (
+    rel === '' ||
+    rel.startsWith('..') ||
+    rel.includes(`..${sep}`) ||
+    resolve(folder, rel) !== target
+  )
+    return null;
   return target;
 }
 
-export async function loadRun(path: string, options: { epochLog?: EpochLogMapping } = {}): Promise<LoadedRun> {
+export async function loadRun(
+  path: string,
+  options: { epochLog?: EpochLogMapping } = {},
+): Promise<LoadedRun> {
   const file = path;
   const bytes = await readText(path, file, 'a run artifact (JSON)');
   const sha256 = createHash('sha256').update(bytes).digest('hex');
@@ -68,7 +82,10 @@ export async function loadRun(path: string, options: { epochLog?: EpochLogMappin
     };
     if (predictionsPath === null) throw new InputError([issue]);
     const info = await stat(predictionsPath).catch(() => null);
-    if (info === null || !info.isFile()) throw new InputError([{ ...issue, expected: 'must name an existing file next to the artifact' }]);
+    if (info === null || !info.isFile())
+      throw new InputError([
+        { ...issue, expected: 'must name an existing file next to the artifact' },
+      ]);
   }
 
   if (options.epochLog !== undefined) {
@@ -77,17 +94,24 @@ export async function loadRun(path: string, options: { epochLog?: EpochLogMappin
     const info = logPath === null ? null : await stat(logPath).catch(() => null);
     if (logPath !== null && info?.isFile() === true) {
       if (artifact.curves?.epochs !== undefined) {
-        notes.push(`${file}: the artifact has its own curves.epochs; the epoch log ${logName} was not used.`);
+        notes.push(
+          `${file}: the artifact has its own curves.epochs; the epoch log ${logName} was not used.`,
+        );
       } else {
         const text = (await readText(logPath, logName, 'an epoch log (CSV)')).toString('utf8');
-        artifact.curves = { ...artifact.curves, epochs: parseEpochLog(text, logName, options.epochLog) };
+        artifact.curves = {
+          ...artifact.curves,
+          epochs: parseEpochLog(text, logName, options.epochLog),
+        };
         if (artifact.metric.kind === 'proportion') {
           // The same range check as the artifact's own curves.
           validateRun(artifact, `${file} (with ${logName})`);
         }
       }
     } else {
-      notes.push(`No epoch log ${logName} next to ${file}; the config's epoch-log mapping was not applied to it.`);
+      notes.push(
+        `No epoch log ${logName} next to ${file}; the config's epoch-log mapping was not applied to it.`,
+      );
     }
   }
   return { artifact, file, sha256, predictionsPath, notes };

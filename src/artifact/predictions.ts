@@ -46,7 +46,8 @@ class HashLog {
   repeated(): Set<number> {
     const sorted = this.data.slice(0, this.size).sort();
     const out = new Set<number>();
-    for (let i = 1; i < sorted.length; i++) if (sorted[i] === sorted[i - 1]) out.add(sorted[i] ?? 0);
+    for (let i = 1; i < sorted.length; i++)
+      if (sorted[i] === sorted[i - 1]) out.add(sorted[i] ?? 0);
     return out;
   }
 }
@@ -59,7 +60,10 @@ function parseValue(raw: string, kind: MetricKind, file: string, line: number): 
       {
         file,
         pointer: `line ${line}`,
-        expected: kind === 'proportion' ? `column "${column}" must be 1 or 0` : `column "${column}" must be a finite number`,
+        expected:
+          kind === 'proportion'
+            ? `column "${column}" must be 1 or 0`
+            : `column "${column}" must be a finite number`,
         got: quote(raw),
       },
     ]);
@@ -67,7 +71,12 @@ function parseValue(raw: string, kind: MetricKind, file: string, line: number): 
   return value;
 }
 
-async function* readRows(path: string, file: string, kind: MetricKind, hashes?: HashLog): AsyncGenerator<Row> {
+async function* readRows(
+  path: string,
+  file: string,
+  kind: MetricKind,
+  hashes?: HashLog,
+): AsyncGenerator<Row> {
   const stream = createReadStream(path, { encoding: 'utf8' });
   const lines = createInterface({ input: stream, crlfDelay: Infinity });
   let line = 0;
@@ -91,10 +100,20 @@ async function* readRows(path: string, file: string, kind: MetricKind, hashes?: 
       if (text.trim() === '') continue;
       const comma = text.indexOf(',');
       if (comma < 0 || text.indexOf(',', comma + 1) >= 0) {
-        throw new InputError([{ file, pointer: `line ${line}`, expected: 'must have exactly two fields, id and value', got: quote(text) }]);
+        throw new InputError([
+          {
+            file,
+            pointer: `line ${line}`,
+            expected: 'must have exactly two fields, id and value',
+            got: quote(text),
+          },
+        ]);
       }
       const id = text.slice(0, comma).trim();
-      if (id === '') throw new InputError([{ file, pointer: `line ${line}`, expected: 'must have a non-empty id' }]);
+      if (id === '')
+        throw new InputError([
+          { file, pointer: `line ${line}`, expected: 'must have a non-empty id' },
+        ]);
       hashes?.push(hashId(id));
       yield { id, value: parseValue(text.slice(comma + 1), kind, file, line), line };
     }
@@ -103,18 +122,35 @@ async function* readRows(path: string, file: string, kind: MetricKind, hashes?: 
     stream.destroy();
   }
   if (line === 0) {
-    throw new InputError([{ file, pointer: '', expected: `is empty; it needs the header "${HEADER[kind]}" and one row per example` }]);
+    throw new InputError([
+      {
+        file,
+        pointer: '',
+        expected: `is empty; it needs the header "${HEADER[kind]}" and one row per example`,
+      },
+    ]);
   }
 }
 
-async function duplicateIssues(path: string, file: string, kind: MetricKind, suspects: Set<number>): Promise<Issue[]> {
+async function duplicateIssues(
+  path: string,
+  file: string,
+  kind: MetricKind,
+  suspects: Set<number>,
+): Promise<Issue[]> {
   const firstLine = new Map<string, number>();
   const issues: Issue[] = [];
   for await (const row of readRows(path, file, kind)) {
     if (!suspects.has(hashId(row.id))) continue;
     const first = firstLine.get(row.id);
     if (first === undefined) firstLine.set(row.id, row.line);
-    else issues.push({ file, pointer: `line ${row.line}`, expected: `must have a unique id (also on line ${first})`, got: quote(row.id) });
+    else
+      issues.push({
+        file,
+        pointer: `line ${row.line}`,
+        expected: `must have a unique id (also on line ${first})`,
+        got: quote(row.id),
+      });
   }
   return issues;
 }
@@ -178,12 +214,20 @@ export async function pairPredictions(
 
   const issues: Issue[] = [];
   const baseRepeated = baseHashes.repeated();
-  if (baseRepeated.size > 0) issues.push(...(await duplicateIssues(baseline.path, baseline.file, kind, baseRepeated)));
+  if (baseRepeated.size > 0)
+    issues.push(...(await duplicateIssues(baseline.path, baseline.file, kind, baseRepeated)));
   const candRepeated = candHashes.repeated();
-  if (candRepeated.size > 0) issues.push(...(await duplicateIssues(candidate.path, candidate.file, kind, candRepeated)));
+  if (candRepeated.size > 0)
+    issues.push(...(await duplicateIssues(candidate.path, candidate.file, kind, candRepeated)));
   if (issues.length > 0) throw new InputError(issues);
 
   const unmatched = { baseline: waitingBase.size, candidate: waitingCand.size };
   if (kind === 'proportion') return { kind, rows, baselineOnly, candidateOnly, unmatched };
-  return { kind, rows, meanDiff: diffs.n > 0 ? diffs.mean : 0, varDiff: diffs.n > 1 ? diffs.variance : 0, unmatched };
+  return {
+    kind,
+    rows,
+    meanDiff: diffs.n > 0 ? diffs.mean : 0,
+    varDiff: diffs.n > 1 ? diffs.variance : 0,
+    unmatched,
+  };
 }

@@ -13,7 +13,8 @@ import { CURVE_NAMES, SPLIT_NAMES, type RunArtifact } from './types.js';
 // ajv-formats is CommonJS; its default export arrives wrapped under esbuild and Node alike.
 type AddFormats = (ajv: Ajv2020, formats: string[]) => unknown;
 const formatsModule = addFormatsModule as unknown as AddFormats | { default: AddFormats };
-const addFormats: AddFormats = typeof formatsModule === 'function' ? formatsModule : formatsModule.default;
+const addFormats: AddFormats =
+  typeof formatsModule === 'function' ? formatsModule : formatsModule.default;
 
 let compiled: ValidateFunction<RunArtifact> | undefined;
 
@@ -77,7 +78,12 @@ export function semanticIssues(run: RunArtifact, file: string): Issue[] {
         });
       }
       if (name === 'training_examples' && point.x <= 0) {
-        issues.push({ file, pointer: `${at}/x`, expected: 'must be > 0 (a count of training examples)', got: quote(point.x) });
+        issues.push({
+          file,
+          pointer: `${at}/x`,
+          expected: 'must be > 0 (a count of training examples)',
+          got: quote(point.x),
+        });
       }
       const previous = curve[i - 1];
       if (previous !== undefined && !(point.x > previous.x)) {
@@ -100,7 +106,12 @@ export function semanticIssues(run: RunArtifact, file: string): Issue[] {
   run.slices?.forEach((slice, i) => {
     const first = names.get(slice.name);
     if (first !== undefined) {
-      issues.push({ file, pointer: `/slices/${i}/name`, expected: `must be unique (also at /slices/${first}/name)`, got: quote(slice.name) });
+      issues.push({
+        file,
+        pointer: `/slices/${i}/name`,
+        expected: `must be unique (also at /slices/${first}/name)`,
+        got: quote(slice.name),
+      });
     } else names.set(slice.name, i);
   });
 
@@ -110,7 +121,7 @@ export function semanticIssues(run: RunArtifact, file: string): Issue[] {
       issues.push({
         file,
         pointer: '/predictions/path',
-        expected: 'must be a relative path inside the artifact\'s folder',
+        expected: "must be a relative path inside the artifact's folder",
         got: quote(p),
         hint: 'Put the CSV next to the artifact and name it without "..", a leading "/" or a drive.',
       });

@@ -52,7 +52,11 @@ export function parseConfig(text: string, file: string): ConfigFile {
     throw new InputError(
       ajvIssues(validate.errors ?? [], file, data).map((issue) => ({
         ...issue,
-        hint: issue.hint?.replace('schema/fitgap-run-1.schema.json', 'schema/fitgap-config.schema.json') ?? 'See schema/fitgap-config.schema.json.',
+        hint:
+          issue.hint?.replace(
+            'schema/fitgap-run-1.schema.json',
+            'schema/fitgap-config.schema.json',
+          ) ?? 'See schema/fitgap-config.schema.json.',
       })),
     );
   }
@@ -62,14 +66,26 @@ export function parseConfig(text: string, file: string): ConfigFile {
 }
 
 /** Reads a config file; `required` false means a missing file is an empty config. */
-export async function loadConfig(path: string, file: string, required: boolean): Promise<{ config: ConfigFile; text: string } | null> {
+export async function loadConfig(
+  path: string,
+  file: string,
+  required: boolean,
+): Promise<{ config: ConfigFile; text: string } | null> {
   let text: string;
   try {
     text = await readFile(path, 'utf8');
   } catch (error) {
     const code = (error as NodeJS.ErrnoException).code;
     if (!required && code === 'ENOENT') return null;
-    throw new InputError([{ file, pointer: '', expected: 'could not be read', got: code ?? String(error), hint: 'Check the --config path.' }]);
+    throw new InputError([
+      {
+        file,
+        pointer: '',
+        expected: 'could not be read',
+        got: code ?? String(error),
+        hint: 'Check the --config path.',
+      },
+    ]);
   }
   return { config: parseConfig(text, file), text };
 }

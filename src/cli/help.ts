@@ -1,0 +1,54 @@
+/** Help texts of the CLI; pinned by tests. */
+export const MAIN_HELP = `fitgap - bias/variance review of a model-training change
+
+Usage:
+  fitgap review --baseline FILE --candidate FILE [options]
+  fitgap validate FILE...
+  fitgap demo [NAME]
+  fitgap --version
+
+Commands:
+  review     compare two run artifacts and print the review
+  validate   check run artifacts (.json) or config files (.yml) and exit
+  demo       review the bundled demo scenario
+
+Run 'fitgap COMMAND --help' for the options of a command.
+
+Exit codes: 0 review done and gate passed; 1 gate failed; 2 bad input or usage.
+A verdict is advice for a human reviewer, not a proof.
+`;
+
+export const REVIEW_HELP = `Usage: fitgap review --baseline FILE --candidate FILE [options]
+
+Compare a candidate training run with its baseline: error decomposition, significance of
+each change, movement in the bias/variance plane, and the next levers to try.
+
+Options:
+  --baseline FILE       baseline run artifact (fitgap-run/1 JSON)
+  --candidate FILE      candidate run artifact (fitgap-run/1 JSON)
+  --config FILE         config file (default: .github/fitgap.yml when it exists)
+  --format FORMAT       text (default), markdown or json
+  --out FILE            write the review to FILE instead of standard output
+  --alpha N             significance level (default 0.05)
+  --min-effect N        smallest change that counts, in metric units (default 0)
+  --gap-tolerance N     component present at N x validation error (default 0.10)
+  --reference N         reference level (human-level or Bayes error) for both runs
+  --fail-on LIST        comma-separated outcomes that fail the gate
+                        (default worse-validation; 'none' never fails)
+  --comment-key KEY     key of the hidden marker in markdown output (default 'default')
+  -h, --help            show this help
+
+Flags override the config file. Exit codes: 0 gate passed; 1 gate failed; 2 bad input.
+`;
+
+export const VALIDATE_HELP = `Usage: fitgap validate FILE...
+
+Check run artifacts (.json, with their predictions CSV) and config files (.yml, .yaml).
+Prints one line per file; exit code 0 when all are valid, 2 otherwise.
+`;
+
+export const DEMO_HELP = `Usage: fitgap demo [NAME] [--format text|markdown|json]
+
+Review a bundled demo scenario: a fictional bakery chain's model that predicts whether an
+order will be late. Without NAME, the first candidate is reviewed and the others are listed.
+`;
