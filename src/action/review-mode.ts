@@ -1,0 +1,60 @@
+/**
+ * Review mode: review the candidate against the baseline, then publish in this order: job summary,
+ * JSON report, outputs, comment, gate. The gate is applied even when commenting fails.
+ */
+import { join } from 'node:path';
+import { renderMarkdown } from '../report/markdown.js';
+import { reviewFiles } from '../review-files.js';
+import type { SettingsOverrides } from '../review-files.js';
+import { resolveBaseline } from './baseline.js';
+import type { PublishDeps } from './publish-steps.js';
+import { commentStep, gateCheckStep, setReviewOutputs } from './publish-steps.js';
+import { writeReportFiles } from './report-files.js';
+
+export async function runReview(deps: PublishDeps): Promise<void> {
+  const { settings, context, io } = deps;
+  const baseline = await resolveBaseline(deps);
+  const overrides: SettingsOverrides = {
+    ...(settings.alpha === null ? {} : { alpha: settings.alpha }),
+    ...(settings.minEffect === null ? {} : { minEffect: settings.minEffect }),
+    ...(settings.failOn === null ? {} : { failOn: settings.failOn }),
+  };
+  const { review } = await reviewFiles({
+    baseline,
+    candidate: settings.candidate ?? '',
+    ...(settings.config === null ? {} : { config: settings.config }),
+    cwd: settings.workspace,
+    overrides,
+  });
+  const pr = context.pullRequest;
+  const headSha = pr?.headSha ?? context.sha;
+  const body = renderMarkdown(review, { commentKey: settings.commentKey, headSha });
+
+  await io.appendSummary(body);
+  const files = await writeReportFiles(
+    join(settings.tempDir, `fitgap-${settings.commentKey}`, 'report'),
+    review,
+    pr === null
+      ? null
+      : {
+          format: 'fitgap-pull-request/1',
+          repository: `${context.repo.owner}/${context.repo.repo}`,
+          number: pr.number,
+          headSha: pr.headSha,
+        },
+  );
+  setReviewOutputs(io, review, files.path, files.dir);
+
+  const problems: string[] = [];
+  if (pr !== null) {
+    const problem = await commentStep(deps, { pullNumber: pr.number, headSha }, body);
+    if (problem !== null) problems.push(problem);
+  }
+  if (settings.statusCheck === 'check-run' || settings.statusCheck === 'commit-status') {
+    const problem = await gateCheckStep(deps, settings.statusCheck, headSha, review, body);
+    if (problem !== null) problems.push(problem);
+  }
+  if (!review.gate.pass)
+    problems.unshift(`fitgap gate failed:\n${review.gate.reasons.map((r) => `- ${r}`).join('\n')}`);
+  if (problems.length > 0) io.setFailed(problems.join('\n'));
+}
