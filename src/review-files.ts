@@ -4,7 +4,7 @@
  * is pure. Throws `InputError` for anything the user must fix.
  */
 import { createHash } from 'node:crypto';
-import { resolve } from 'node:path';
+import { dirname, join, resolve } from 'node:path';
 import { buildReview, type PairedPredictions } from './analysis/review.js';
 import type { Review, ReviewSettings } from './analysis/types.js';
 import { loadRun, type LoadedRun } from './artifact/load-run.js';
@@ -101,8 +101,8 @@ async function pairIfBoth(
     };
   }
   const result = await pairPredictions(
-    { path: baseline.predictionsPath, file: bp.path },
-    { path: candidate.predictionsPath, file: cp.path },
+    { path: baseline.predictionsPath, file: join(dirname(baseline.file), bp.path) },
+    { path: candidate.predictionsPath, file: join(dirname(candidate.file), cp.path) },
     candidate.artifact.metric.kind,
   );
   const notes: string[] = [];
@@ -126,10 +126,10 @@ export async function reviewFiles(options: ReviewFilesOptions): Promise<ReviewFi
   const config = loaded?.config ?? {};
   const epochLog = config['epoch-log'];
   const load = (path: string): Promise<LoadedRun> =>
-    loadRun(resolve(cwd, path), epochLog === undefined ? {} : { epochLog }).then((run) => ({
-      ...run,
-      file: path,
-    }));
+    loadRun(resolve(cwd, path), {
+      displayName: path,
+      ...(epochLog === undefined ? {} : { epochLog }),
+    });
 
   // Load both, so the user sees the problems of both files at once.
   const [b, c] = await Promise.allSettled([load(options.baseline), load(options.candidate)]);

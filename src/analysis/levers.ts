@@ -174,12 +174,22 @@ export function chooseLevers(ctx: LeverContext): { levers: Lever[]; nonLevers: s
         `${p.change.key} rose ${from} → ${to} and moved the model toward overfitting (Δvariance ${formatChange(ctx.variance.estimate, kind)}); step back toward ${formatNumber(between)} or keep it and regularize harder.`,
         [`Δvariance ${formatChange(ctx.variance.estimate, kind)}`],
       );
-      add(
-        'stronger-regularization',
-        85,
-        `Keep the new ${p.change.key} but counter its extra variance with stronger regularization.`,
-        [],
-      );
+      const reg = regularization(curves);
+      if (reg !== null && reg.side === 'below') {
+        add(
+          'stronger-regularization',
+          95,
+          `Keep the new ${p.change.key} and regularize harder: the candidate's sweep has its validation minimum at λ ≈ ${formatNumber(reg.bestX)}${ctx.lambda === undefined ? '' : ` (it uses ${formatNumber(ctx.lambda)})`}; try ${formatNumber(reg.suggestedX)}.`,
+          [`lowest validation ${v(reg.bestValidation)} at λ ≈ ${formatNumber(reg.bestX)}`],
+        );
+      } else {
+        add(
+          'stronger-regularization',
+          85,
+          `Keep the new ${p.change.key} but counter its extra variance with stronger regularization.`,
+          [],
+        );
+      }
     }
   }
 

@@ -16,17 +16,3 @@ export function movementOf(biasCall: Call, varianceCall: Call): Movement {
 export function validationChangeOf(shortfallCall: Call): ValidationChange {
   return shortfallCall === 'up' ? 'worse' : shortfallCall === 'down' ? 'better' : 'flat';
 }
-
-/** The mirror image of a movement: what swapping baseline and candidate reports. */
-export function mirrorMovement(movement: Movement): Movement {
-  const mirror: Record<Movement, Movement> = {
-    'better-on-both': 'worse-on-both',
-    'worse-on-both': 'better-on-both',
-    'away-from-underfitting': 'toward-underfitting',
-    'toward-underfitting': 'away-from-underfitting',
-    'toward-overfitting': 'away-from-overfitting',
-    'away-from-overfitting': 'toward-overfitting',
-    'no-significant-change': 'no-significant-change',
-  };
-  return mirror[movement];
-}

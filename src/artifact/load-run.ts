@@ -62,9 +62,9 @@ function besideArtifact(artifactPath: string, name: string): string | null {
 
 export async function loadRun(
   path: string,
-  options: { epochLog?: EpochLogMapping } = {},
+  options: { epochLog?: EpochLogMapping; displayName?: string } = {},
 ): Promise<LoadedRun> {
-  const file = path;
+  const file = options.displayName ?? path;
   const bytes = await readText(path, file, 'a run artifact (JSON)');
   const sha256 = createHash('sha256').update(bytes).digest('hex');
   const artifact = validateRun(parseJson(bytes.toString('utf8'), file), file);
@@ -90,7 +90,7 @@ export async function loadRun(
 
   if (options.epochLog !== undefined) {
     const logPath = besideArtifact(path, options.epochLog.file);
-    const logName = `${dirname(file)}/${options.epochLog.file}`;
+    const logName = `${dirname(file) === '.' ? '' : `${dirname(file)}/`}${options.epochLog.file}`;
     const info = logPath === null ? null : await stat(logPath).catch(() => null);
     if (logPath !== null && info?.isFile() === true) {
       if (artifact.curves?.epochs !== undefined) {

@@ -108,7 +108,7 @@ export async function validateCommand(argv: string[], io: CliIo): Promise<number
         parseConfig(text, file);
         io.stdout(`${file}: valid config\n`);
       } else {
-        const run = await loadRun(resolve(io.cwd, file));
+        const run = await loadRun(resolve(io.cwd, file), { displayName: file });
         io.stdout(
           `${file}: valid run artifact "${run.artifact.run.name}" (${run.artifact.splits.train.values.length} repeat(s))\n`,
         );
