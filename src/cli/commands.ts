@@ -164,12 +164,9 @@ export async function demoCommand(argv: string[], io: CliIo): Promise<number> {
   io.stdout(renderReview(result, format, { color: io.color }));
   if (format === 'text') {
     const others = names.filter((n) => n !== name);
-    io.stdout(
-      `\nDemo: baseline vs "${name}". Other candidates: ${others.map((n) => `fitgap demo ${n}`).join(', ')}.\n`,
-    );
-    io.stdout(
-      `(Run from a checkout: node dist/cli.js demo NAME; add --format markdown for the PR comment.)\n`,
-    );
+    io.stdout(`\nDemo: Crumb & Co. baseline vs candidate "${name}". See the others with:\n`);
+    for (const other of others) io.stdout(`  npm run -s demo -- ${other}\n`);
+    io.stdout('Add --format markdown for the PR comment, or --format json for the report.\n');
   }
   // The demo shows the gate's verdict but succeeds: it is a showcase, not a check.
   return EXIT.ok;

@@ -1,0 +1,123 @@
+/**
+ * The lever catalogue against the trade's rules of thumb (common practice): more training data,
+ * fewer features and stronger regularization address variance; additional features, polynomial
+ * features and weaker regularization address bias; a smaller training set is never a cure for
+ * high bias.
+ */
+import fc from 'fast-check';
+import { describe, expect, it } from 'vitest';
+import { LEVER_CATALOGUE } from '../../src/analysis/levers.js';
+import { buildReview } from '../../src/analysis/review.js';
+import type { LeverId } from '../../src/analysis/types.js';
+import { makeRun, SETTINGS } from './make-run.js';
+
+describe('lever catalogue (common practice)', () => {
+  it.each<[LeverId, string]>([
+    ['more-data', 'variance'],
+    ['fewer-features', 'variance'],
+    ['stronger-regularization', 'variance'],
+    ['smaller-model', 'variance'],
+    ['early-stopping', 'variance'],
+    ['more-features', 'bias'],
+    ['richer-features', 'bias'],
+    ['weaker-regularization', 'bias'],
+    ['bigger-model', 'bias'],
+    ['train-longer', 'bias'],
+    ['align-training-data', 'mismatch'],
+    ['bigger-validation-set', 'validation-overfit'],
+  ])('%s addresses %s', (id, target) => {
+    expect(LEVER_CATALOGUE[id].addresses).toBe(target);
+  });
+
+  it('offers variance levers for high variance and bias levers for high bias', () => {
+    const highVariance = makeRun({
+      reference: 0.01,
+      train: [0.02, 0.021, 0.019],
+      validation: [0.2, 0.21, 0.19],
+    });
+    const r1 = buildReview({ baseline: highVariance, candidate: highVariance, settings: SETTINGS });
+    expect(r1.candidate.diagnosis).toBe('high-variance');
+    const ids1 = r1.levers.map((l) => l.id);
+    expect(ids1.slice(0, 3)).toEqual(
+      expect.arrayContaining(['more-data', 'stronger-regularization', 'fewer-features']),
+    );
+    expect(ids1).not.toContain('more-features');
+    expect(ids1).not.toContain('weaker-regularization');
+
+    const highBias = makeRun({
+      reference: 0.01,
+      train: [0.2, 0.21, 0.19],
+      validation: [0.21, 0.22, 0.2],
+    });
+    const r2 = buildReview({ baseline: highBias, candidate: highBias, settings: SETTINGS });
+    expect(r2.candidate.diagnosis).toBe('high-bias');
+    const ids2 = r2.levers.map((l) => l.id);
+    expect(ids2.slice(0, 3)).toEqual(expect.arrayContaining(['richer-features', 'more-features']));
+    expect(ids2).not.toContain('more-data');
+    expect(ids2).not.toContain('stronger-regularization');
+    expect(r2.nonLevers.join(' ')).toMatch(/smaller training set is not a cure for high bias/);
+  });
+
+  it('never offers a smaller training set, whatever the runs', () => {
+    const values = fc.array(fc.double({ min: 0.01, max: 0.5, noNaN: true }), {
+      minLength: 2,
+      maxLength: 2,
+    });
+    fc.assert(
+      fc.property(
+        values,
+        values,
+        values,
+        values,
+        fc.integer({ min: 100, max: 100000 }),
+        (t1, v1, t2, v2, n) => {
+          const b = makeRun({
+            kind: 'proportion',
+            train: t1,
+            validation: v1,
+            hyperparameters: { train_examples: n },
+          });
+          const c = makeRun({
+            kind: 'proportion',
+            train: t2,
+            validation: v2,
+            hyperparameters: { train_examples: Math.floor(n / 2) },
+          });
+          const review = buildReview({ baseline: b, candidate: c, settings: SETTINGS });
+          for (const lever of review.levers) {
+            expect(lever.reason).not.toMatch(
+              /(smaller|fewer|less) (training set|training data|data\b)/i,
+            );
+          }
+          if (
+            review.candidate.diagnosis === 'high-bias' ||
+            review.candidate.diagnosis === 'high-bias-and-variance'
+          ) {
+            expect(review.nonLevers.length).toBeGreaterThan(0);
+          }
+        },
+      ),
+      { numRuns: 200 },
+    );
+  });
+
+  it('does not blindly repeat a lever the PR already pulled', () => {
+    const b = makeRun({
+      reference: 0.01,
+      train: [0.02, 0.021, 0.019],
+      validation: [0.2, 0.21, 0.19],
+      hyperparameters: { lambda: 0.1 },
+    });
+    const c = makeRun({
+      reference: 0.01,
+      train: [0.02, 0.021, 0.019],
+      validation: [0.19, 0.2, 0.18],
+      hyperparameters: { lambda: 0.3 },
+    });
+    const review = buildReview({ baseline: b, candidate: c, settings: SETTINGS });
+    expect(review.candidate.diagnosis).toBe('high-variance');
+    const strong = review.levers.find((l) => l.id === 'stronger-regularization');
+    expect(strong?.reason).toMatch(/already raised lambda \(0\.1 → 0\.3\)/);
+    expect(review.levers[0]?.id).not.toBe('stronger-regularization');
+  });
+});

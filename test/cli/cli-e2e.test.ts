@@ -1,0 +1,126 @@
+/**
+ * End-to-end runs of the built CLI (dist/cli.js) as a child process, as a user would run it.
+ */
+import { execFile } from 'node:child_process';
+import { existsSync, mkdtempSync, readFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join, resolve } from 'node:path';
+import { promisify } from 'node:util';
+import { beforeAll, describe, expect, it } from 'vitest';
+import { MAIN_HELP, REVIEW_HELP } from '../../src/cli/help.js';
+
+const run = promisify(execFile);
+const cli = resolve('dist/cli.js');
+
+async function fitgap(args: string[], env: Record<string, string> = {}) {
+  try {
+    const { stdout, stderr } = await run(process.execPath, [cli, ...args], {
+      env: { PATH: process.env['PATH'] ?? '', ...env },
+      cwd: resolve('.'),
+    });
+    return { code: 0, stdout, stderr };
+  } catch (error) {
+    const e = error as { code: number; stdout: string; stderr: string };
+    return { code: e.code, stdout: e.stdout, stderr: e.stderr };
+  }
+}
+
+beforeAll(async () => {
+  if (!existsSync(cli)) await run('npm', ['run', '-s', 'build']);
+});
+
+describe('fitgap CLI (built)', () => {
+  it('prints help and version', async () => {
+    expect((await fitgap(['--help'])).stdout).toBe(MAIN_HELP);
+    expect((await fitgap(['review', '--help'])).stdout).toBe(REVIEW_HELP);
+    const pkg = JSON.parse(readFileSync('package.json', 'utf8')) as { version: string };
+    expect((await fitgap(['--version'])).stdout).toBe(`${pkg.version}\n`);
+  });
+
+  it('reviews the DESIGN.md example against a modified copy as JSON with the stable keys', async () => {
+    const result = await fitgap([
+      'review',
+      '--baseline',
+      'test/fixtures/design/example.json',
+      '--candidate',
+      'test/fixtures/design/candidate/example.json',
+      '--format',
+      'json',
+      '--fail-on',
+      'none',
+    ]);
+    expect(result.stderr).toBe('');
+    expect(result.code).toBe(0);
+    const report = JSON.parse(result.stdout) as Record<string, unknown> & {
+      validation: { change: string; delta: { test: string } };
+      bias: { delta: Record<string, unknown> };
+      variance: { delta: Record<string, unknown> };
+      levers: { id: string; reason: string; evidence: string[] }[];
+      gate: { pass: boolean; reasons: string[] };
+    };
+    expect(report['format']).toBe('fitgap-review/1');
+    expect(report['movement']).toBe('toward-overfitting');
+    expect(['better', 'worse', 'flat']).toContain(report.validation.change);
+    for (const delta of [report.bias.delta, report.variance.delta]) {
+      expect(Object.keys(delta).sort()).toEqual(['call', 'ci', 'estimate', 'p', 'test']);
+    }
+    expect(report).toHaveProperty('baseline.diagnosis');
+    expect(report).toHaveProperty('candidate.diagnosis');
+    expect(report.levers[0]).toEqual({
+      id: expect.any(String),
+      reason: expect.any(String),
+      evidence: expect.any(Array),
+    });
+    expect(report.gate).toEqual({ pass: true, reasons: [], failOn: ['none'] });
+  });
+
+  it('exits 1 when the gate fails and writes --out', async () => {
+    const dir = mkdtempSync(join(tmpdir(), 'fitgap-cli-'));
+    const out = join(dir, 'review.md');
+    const result = await fitgap([
+      'review',
+      '--baseline',
+      'demo/baseline.json',
+      '--candidate',
+      'demo/2-lambda-3.json',
+      '--format',
+      'markdown',
+      '--out',
+      out,
+    ]);
+    expect(result.code).toBe(1);
+    expect(result.stderr).toContain('gate failed');
+    expect(readFileSync(out, 'utf8')).toMatch(/^<!-- fitgap:review key=default head= -->/);
+  });
+
+  it('runs the demo with three different movements', async () => {
+    const movements: string[] = [];
+    for (const name of ['1-interactions', '2-lambda-3', '3-more-data']) {
+      const result = await fitgap(['demo', name, '--format', 'json']);
+      expect(result.code).toBe(0);
+      movements.push((JSON.parse(result.stdout) as { movement: string }).movement);
+    }
+    expect(movements).toEqual(['toward-overfitting', 'toward-underfitting', 'better-on-both']);
+  });
+
+  it('prints plain text without colour under NO_COLOR and within 80 columns', async () => {
+    const result = await fitgap(['demo'], { NO_COLOR: '1' });
+    expect(result.code).toBe(0);
+    expect(result.stdout).not.toMatch(/\u001b\[/);
+    for (const line of result.stdout.split('\n')) expect(line.length).toBeLessThanOrEqual(80);
+    expect(result.stdout).toContain('npm run -s demo -- 2-lambda-3');
+  });
+
+  it('validates files and reports bad ones with exit 2', async () => {
+    const ok = await fitgap(['validate', 'test/fixtures/design/example.json', 'demo/fitgap.yml']);
+    expect(ok.code).toBe(0);
+    expect(ok.stdout).toContain(
+      'test/fixtures/design/example.json: valid run artifact "poly-degree-3" (3 repeat(s))',
+    );
+    const bad = await fitgap(['validate', 'test/fixtures/bad/bad-goal.json']);
+    expect(bad.code).toBe(2);
+    expect(bad.stderr).toBe(
+      'test/fixtures/bad/bad-goal.json: /metric/goal must be one of "minimize", "maximize" (got "lower").\n',
+    );
+  });
+});
