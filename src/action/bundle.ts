@@ -46,7 +46,17 @@ const delta = {
  */
 const reviewSchema = {
   type: 'object',
-  required: ['format', 'movement', 'validation', 'candidate', 'baseline', 'gate', 'metric'],
+  required: [
+    'format',
+    'movement',
+    'validation',
+    'slices',
+    'settings',
+    'candidate',
+    'baseline',
+    'gate',
+    'metric',
+  ],
   properties: {
     format: { const: 'fitgap-review/1' },
     movement: enumOf([
@@ -63,10 +73,30 @@ const reviewSchema = {
       required: ['change', 'delta'],
       properties: { change: enumOf(['better', 'worse', 'flat']), delta },
     },
+    slices: {
+      type: 'array',
+      items: {
+        type: 'object',
+        required: ['change'],
+        properties: { change: enumOf(['better', 'worse', 'flat']) },
+      },
+    },
+    settings: { type: 'object' },
     candidate: {
       type: 'object',
-      required: ['diagnosis'],
+      required: ['diagnosis', 'components'],
       properties: {
+        components: {
+          type: 'object',
+          required: ['overfit'],
+          properties: {
+            overfit: {
+              type: 'object',
+              required: ['present'],
+              properties: { present: { type: 'boolean' } },
+            },
+          },
+        },
         diagnosis: enumOf([
           'good-fit',
           'high-bias',

@@ -5,6 +5,7 @@
  * run on that head sha. The job's own status does not attach to the PR, so the gate lives in the
  * check; the step fails only when publishing fails.
  */
+import { applyGate } from '../analysis/gate.js';
 import { InputError } from '../errors.js';
 import type { Issue } from '../errors.js';
 import { downloadArtifact } from '../github/artifacts.js';
@@ -34,7 +35,11 @@ export async function runPublish(deps: PublishDeps): Promise<void> {
   const files = await downloadBundle(deps, run);
   const label = `artifact "${settings.reportArtifact}" (run ${run.id})`;
   const note = readPullRequestNote(files.note, label);
-  const review = readReview(files.review, label);
+  const untrusted = readReview(files.review, label);
+  // The gate policy is the publish workflow's (trusted), applied to the reported outcome.
+  const failOn = settings.failOn ?? untrusted.settings.failOn;
+  const review = { ...untrusted, settings: { ...untrusted.settings, failOn } };
+  review.gate = applyGate(review);
   const fullName = `${context.repo.owner}/${context.repo.repo}`;
   if (note.repository !== fullName || note.headSha !== run.headSha) {
     refuse({

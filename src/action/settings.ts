@@ -6,6 +6,7 @@ import * as core from '@actions/core';
 import { tmpdir } from 'node:os';
 import { InputError, quote } from '../errors.js';
 import type { Issue } from '../errors.js';
+import { failOnIssues } from '../config/load-config.js';
 import { isValidCommentKey } from '../report/marker.js';
 
 export type ActionMode = 'review' | 'publish';
@@ -136,6 +137,7 @@ export function readSettings(env: Env = process.env): Settings {
           .split(/[\s,]+/)
           .map((s) => s.trim())
           .filter((s) => s !== '');
+  issues.push(...failOnIssues(failOn ?? [], 'input "fail-on"', ''));
   const limitMb = number('archive-limit-mb', issues, 0.001, 2048) ?? 50;
   const settings: Settings = {
     mode,

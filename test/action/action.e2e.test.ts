@@ -1,0 +1,545 @@
+/**
+ * End-to-end: the bundled action (`dist/index.js`) in a child process, against the fake GitHub
+ * REST server on 127.0.0.1. Each test has its own server, repository and temp folders, so they run
+ * concurrently. Every answer of the fake is checked against GitHub's OpenAPI description.
+ */
+import { existsSync, readFileSync } from 'node:fs';
+import { join } from 'node:path';
+import { beforeAll, describe, test } from 'vitest';
+import type { ExpectStatic, TestContext } from 'vitest';
+import { BOT, FakeRepo, PERSON, TOKEN } from '../fake-github/repo.js';
+import { FakeGitHub, apiError } from '../fake-github/server.js';
+import type { ActionRun } from './harness.js';
+import { FIXTURES, HEAD, OLD_HEAD, buildBundle, pullRequestEvent, runAction } from './harness.js';
+import { fixtureText, zipFiles } from './zips.js';
+
+beforeAll(() => buildBundle(), 120_000);
+
+/** A fresh fake server and repository, closed when the (concurrent) test finishes. */
+async function setup(context: TestContext): Promise<{ fake: FakeGitHub; repo: FakeRepo }> {
+  const fake = await new FakeGitHub().start();
+  context.onTestFinished(() => fake.close());
+  const repo = new FakeRepo(fake).install();
+  repo.pulls.set(7, { headSha: HEAD, headRepo: 'o/r', baseRef: 'main' });
+  return { fake, repo };
+}
+
+const WORSE = `${FIXTURES}/candidate-worse.json`;
+const BETTER = `${FIXTURES}/candidate-better.json`;
+const BASELINE = `${FIXTURES}/baseline.json`;
+
+function review(
+  fake: FakeGitHub,
+  candidate: string,
+  extra: Partial<Parameters<typeof runAction>[0]> = {},
+) {
+  return runAction({
+    apiUrl: fake.url,
+    eventName: 'pull_request',
+    payload: pullRequestEvent(),
+    inputs: { candidate: 'runs/candidate.json', baseline: 'runs/baseline.json' },
+    files: { 'runs/candidate.json': candidate, 'runs/baseline.json': BASELINE },
+    ...extra,
+  });
+}
+
+const COMMENTS = 'GET /repos/o/r/issues/7/comments?per_page=100';
+const PULL = 'GET /repos/o/r/pulls/7';
+const POST = 'POST /repos/o/r/issues/7/comments';
+
+/** What every run must honour: a conforming fake, no stack trace, the token only in its mask command. */
+function sane(expect: ExpectStatic, fake: FakeGitHub, run: ActionRun) {
+  expect(fake.violations).toEqual([]);
+  const printed = `${run.stdout}\n${run.stderr}`.replace(`::add-mask::${TOKEN}`, '');
+  expect(printed).not.toContain(TOKEN);
+  expect(printed).not.toMatch(/\n\s+at .+:\d+:\d+/);
+}
+
+describe.concurrent('review mode on a pull request', () => {
+  test('first run: summary, report, outputs, one comment, then the gate', async (context) => {
+    const { expect } = context;
+    const { fake, repo } = await setup(context);
+    const run = await review(fake, WORSE);
+    sane(expect, fake, run);
+    expect(fake.log).toEqual([PULL, COMMENTS, POST, COMMENTS]);
+    expect(repo.comments).toHaveLength(1);
+    const [comment] = repo.comments;
+    expect(comment?.body).toContain(`<!-- fitgap:review key=default head=${HEAD} -->`);
+    // The gate (fail-on: worse-validation, the action.yml default) fails the step after commenting.
+    expect(run.code).toBe(1);
+    expect(run.stdout).toMatch(/::error::fitgap gate failed:%0A- worse-validation/);
+    const report = JSON.parse(readFileSync(run.outputs['report-path'] ?? '', 'utf8')) as Record<
+      string,
+      unknown
+    >;
+    expect(report['format']).toBe('fitgap-review/1');
+    expect(run.outputs).toMatchObject({
+      movement: report['movement'],
+      'validation-change': 'worse',
+      'candidate-diagnosis': (report['candidate'] as { diagnosis: string }).diagnosis,
+      gate: 'fail',
+      'comment-url': `https://github.invalid/o/r/pull/7#issuecomment-${comment?.id}`,
+    });
+    expect(run.outputs['report-path']?.startsWith(run.temp)).toBe(true);
+    expect(run.summary).toContain(comment?.body.split('\n')[1] ?? 'missing');
+    const note = JSON.parse(
+      readFileSync(join(run.outputs['report-dir'] ?? '', 'pull-request.json'), 'utf8'),
+    );
+    expect(note).toEqual({
+      format: 'fitgap-pull-request/1',
+      repository: 'o/r',
+      number: 7,
+      headSha: HEAD,
+    });
+  });
+
+  test('second run updates the same comment; an unchanged body is not edited', async (context) => {
+    const { expect } = context;
+    const { fake, repo } = await setup(context);
+    const first = await review(fake, BETTER);
+    expect(first.code).toBe(0);
+    const id = repo.comments[0]?.id;
+    fake.log.length = 0;
+    const second = await review(fake, WORSE);
+    sane(expect, fake, second);
+    expect(fake.log).toEqual([PULL, COMMENTS, `PATCH /repos/o/r/issues/comments/${id}`]);
+    expect(repo.comments.map((c) => c.id)).toEqual([id]);
+    expect(repo.comments[0]?.body).toContain('worse');
+    fake.log.length = 0;
+    const third = await review(fake, WORSE);
+    sane(expect, fake, third);
+    expect(fake.log).toEqual([PULL, COMMENTS]);
+    expect(third.outputs['comment-url']).toBe(second.outputs['comment-url']);
+  });
+
+  test('120 earlier comments over two pages, people quoting the marker: only ours is edited', async (context) => {
+    const { expect } = context;
+    const { fake, repo } = await setup(context);
+    const quote = `> <!-- fitgap:review key=default head=${HEAD} -->\n> copied from the bot`;
+    let ours = 0;
+    let otherKey = 0;
+    for (let i = 0; i < 120; i++) {
+      if (i === 104)
+        ours = repo.addComment('<!-- fitgap:review key=default head=0123abc -->\nold', BOT).id;
+      else if (i === 3)
+        otherKey = repo.addComment(
+          '<!-- fitgap:review key=ranker head=0123abc -->\nother model',
+          BOT,
+        ).id;
+      else repo.addComment(i % 10 === 0 ? quote : `comment ${i}`, PERSON);
+    }
+    const before = repo.comments.map((c) => ({ ...c }));
+    const run = await review(fake, BETTER);
+    sane(expect, fake, run);
+    expect(fake.log).toEqual([
+      PULL,
+      COMMENTS,
+      `${COMMENTS}&page=2`,
+      `PATCH /repos/o/r/issues/comments/${ours}`,
+    ]);
+    expect(run.code).toBe(0);
+    for (const [i, c] of repo.comments.entries()) {
+      if (c.id !== ours) expect(c).toEqual(before[i]);
+    }
+    expect(repo.comments.find((c) => c.id === otherKey)?.body).toContain('other model');
+    expect(repo.comments.find((c) => c.id === ours)?.body).toContain(`head=${HEAD}`);
+  });
+
+  test('403 on commenting: a warning and the summary, the gate still applied', async (context) => {
+    const { expect } = context;
+    const { fake, repo } = await setup(context);
+    fake.on(`POST /repos/{owner}/{repo}/issues/{issue_number}/comments`, () =>
+      apiError(403, 'Resource not accessible by integration'),
+    );
+    const [failing, passing] = await Promise.all([review(fake, WORSE), review(fake, BETTER)]);
+    for (const run of [failing, passing]) {
+      sane(expect, fake, run);
+      expect(run.stdout).toMatch(
+        /::warning::fitgap could not comment on PR #7 .*403: Resource not accessible/,
+      );
+      expect(run.summary).toContain('## fitgap');
+      expect(run.summary).toContain('could not comment on PR #7');
+      expect(run.outputs['movement']).toBeDefined();
+      expect(run.outputs['comment-url']).toBeUndefined();
+    }
+    expect(repo.comments).toEqual([]);
+    expect(failing.code).toBe(1);
+    expect(failing.stdout).toContain('::error::fitgap gate failed');
+    expect(passing.code).toBe(0);
+  });
+
+  test('502 then success: the request is retried', async (context) => {
+    const { expect } = context;
+    const { fake, repo } = await setup(context);
+    fake.queue('GET /repos/{owner}/{repo}/issues/{issue_number}/comments', () =>
+      apiError(502, 'Server Error'),
+    );
+    const run = await review(fake, BETTER);
+    sane(expect, fake, run);
+    expect(fake.log).toEqual([PULL, COMMENTS, COMMENTS, POST, COMMENTS]);
+    expect(repo.comments).toHaveLength(1);
+    expect(run.code).toBe(0);
+  });
+
+  test('secondary rate limit with retry-after: waited for and retried', async (context) => {
+    const { expect } = context;
+    const { fake, repo } = await setup(context);
+    fake.queue('POST /repos/{owner}/{repo}/issues/{issue_number}/comments', () =>
+      apiError(
+        403,
+        'You have exceeded a secondary rate limit. Please wait a few minutes before you try again.',
+        {
+          'retry-after': '2',
+        },
+      ),
+    );
+    const run = await review(fake, BETTER);
+    sane(expect, fake, run);
+    expect(fake.log).toEqual([PULL, COMMENTS, POST, POST, COMMENTS]);
+    expect(run.stdout).toContain(
+      'secondary rate limit on POST /repos/{owner}/{repo}/issues/{issue_number}/comments: retrying after 2 s',
+    );
+    expect(repo.comments).toHaveLength(1);
+    expect(run.code).toBe(0);
+  });
+
+  test('a stale run for an older head never overwrites the newer report', async (context) => {
+    const { expect } = context;
+    const { fake, repo } = await setup(context);
+    const newer = repo.addComment(
+      `<!-- fitgap:review key=default head=${HEAD} -->\nnewer report`,
+      BOT,
+    );
+    const run = await review(fake, WORSE, { payload: pullRequestEvent(7, OLD_HEAD) });
+    sane(expect, fake, run);
+    expect(fake.log).toEqual([PULL]);
+    expect(repo.comments).toEqual([newer]);
+    expect(run.stdout).toContain(`Not commenting: this review is for ${OLD_HEAD}`);
+    expect(run.code).toBe(1); // the gate still applies to the commit this run reviewed
+  });
+
+  test('comment: new posts another comment; comment: off posts none', async (context) => {
+    const { expect } = context;
+    const { fake, repo } = await setup(context);
+    await review(fake, BETTER);
+    await review(fake, BETTER, {
+      inputs: { candidate: 'runs/candidate.json', baseline: 'runs/baseline.json', comment: 'new' },
+    });
+    expect(repo.comments).toHaveLength(2);
+    fake.log.length = 0;
+    const off = await review(fake, BETTER, {
+      inputs: { candidate: 'runs/candidate.json', baseline: 'runs/baseline.json', comment: 'off' },
+    });
+    sane(expect, fake, off);
+    expect(fake.log).toEqual([]);
+    expect(off.code).toBe(0);
+  });
+});
+
+describe.concurrent('without a pull request, and user errors', () => {
+  test('push event: summary, outputs and gate, no API call', async (context) => {
+    const { expect } = context;
+    const { fake } = await setup(context);
+    const run = await review(fake, WORSE, {
+      eventName: 'push',
+      payload: { ref: 'refs/heads/main', repository: { full_name: 'o/r', default_branch: 'main' } },
+    });
+    sane(expect, fake, run);
+    expect(fake.log).toEqual([]);
+    expect(run.summary).toContain('## fitgap');
+    expect(run.outputs['validation-change']).toBe('worse');
+    expect(run.code).toBe(1);
+  });
+
+  test('bad input: one clear message per problem, no stack, no API call', async (context) => {
+    const { expect } = context;
+    const { fake } = await setup(context);
+    const run = await review(fake, WORSE, {
+      inputs: {
+        candidate: 'runs/candidate.json',
+        comment: 'sometimes',
+        alpha: 'five',
+        'fail-on': 'worse',
+      },
+    });
+    sane(expect, fake, run);
+    expect(run.code).toBe(1);
+    expect(run.stdout).toContain(
+      'input \\"comment\\" must be one of update, new, off (got \\"sometimes\\")'.replace(
+        /\\"/g,
+        '"',
+      ),
+    );
+    expect(run.stdout).toContain(
+      'inputs "baseline" and "baseline-artifact" need exactly one of them (got neither)',
+    );
+    expect(run.stdout).toContain('input "alpha" must be a number');
+    expect(run.stdout).toContain('input "fail-on" must be one of worse-validation');
+    expect(fake.log).toEqual([]);
+  });
+
+  test('a missing candidate file: the core names the file', async (context) => {
+    const { expect } = context;
+    const { fake } = await setup(context);
+    const run = await review(fake, WORSE, {
+      inputs: { candidate: 'runs/nope.json', baseline: 'runs/baseline.json' },
+    });
+    sane(expect, fake, run);
+    expect(run.code).toBe(1);
+    expect(run.stdout).toMatch(/::error::.*nope\.json/);
+    expect(fake.log).toEqual([]);
+  });
+});
+
+describe.concurrent('baseline from an artifact of the base branch', () => {
+  function artifactSetup(repo: FakeRepo, zip: Uint8Array, sizeInBytes?: number) {
+    repo.runs.push(
+      {
+        id: 501,
+        workflowFile: 'train.yml',
+        headSha: 'd'.repeat(40),
+        headBranch: 'main',
+        event: 'push',
+        conclusion: 'success',
+        headRepo: 'o/r',
+      },
+      // A fork's branch named "main": never a baseline.
+      {
+        id: 502,
+        workflowFile: 'train.yml',
+        headSha: 'e'.repeat(40),
+        headBranch: 'main',
+        event: 'pull_request',
+        conclusion: 'success',
+        headRepo: 'fork/r',
+      },
+      {
+        id: 503,
+        workflowFile: 'train.yml',
+        headSha: 'f'.repeat(40),
+        headBranch: 'main',
+        event: 'push',
+        conclusion: 'failure',
+        headRepo: 'o/r',
+      },
+    );
+    repo.artifacts.push(
+      {
+        id: 77,
+        runId: 501,
+        name: 'baseline-run',
+        zip,
+        ...(sizeInBytes === undefined ? {} : { sizeInBytes }),
+      },
+      {
+        id: 78,
+        runId: 502,
+        name: 'baseline-run',
+        zip: zipFiles({ 'run.json': fixtureText(WORSE) }),
+      },
+    );
+  }
+  const inputs = (extra: Record<string, string> = {}) => ({
+    candidate: 'out/run.json',
+    'baseline-artifact': 'baseline-run',
+    comment: 'off',
+    ...extra,
+  });
+  const files = { 'out/run.json': BETTER };
+  const SEARCH = [
+    'GET /repos/o/r/actions/workflows/train.yml/runs?status=success&per_page=20&branch=main',
+    'GET /repos/o/r/actions/runs/501/artifacts?name=baseline-run&per_page=100',
+  ];
+
+  test('newest successful push run, zip fetched through the 302, only the run file extracted', async (context) => {
+    const { expect } = context;
+    const { fake, repo } = await setup(context);
+    artifactSetup(
+      repo,
+      zipFiles({
+        'run.json': fixtureText(BASELINE),
+        'model.bin': new Uint8Array(1000),
+        'notes/other.json': '{}',
+      }),
+    );
+    const run = await review(fake, BETTER, { inputs: inputs(), files });
+    sane(expect, fake, run);
+    expect(fake.log).toEqual([
+      ...SEARCH,
+      'GET /repos/o/r/actions/artifacts/77/zip',
+      'GET /storage/artifacts/77.zip?sig=abc',
+    ]);
+    expect(run.code).toBe(0);
+    expect(run.outputs['validation-change']).toBe('better');
+    const dir = join(run.temp, 'fitgap-default', 'baseline');
+    expect(readFileSync(join(dir, 'run.json'), 'utf8')).toBe(fixtureText(BASELINE));
+    expect(existsSync(join(dir, 'model.bin'))).toBe(false);
+    expect(existsSync(join(dir, 'notes'))).toBe(false);
+  });
+
+  test("a zip with a '../' entry is refused as a whole", async (context) => {
+    const { expect } = context;
+    const { fake, repo } = await setup(context);
+    artifactSetup(repo, zipFiles({ 'run.json': fixtureText(BASELINE), '../../escape.json': '{}' }));
+    const run = await review(fake, BETTER, { inputs: inputs(), files });
+    sane(expect, fake, run);
+    expect(run.code).toBe(1);
+    expect(run.stdout).toContain(
+      `::error::artifact "baseline-run" (run 501) must not contain an entry with a '..' path segment (got "../../escape.json")`,
+    );
+    expect(existsSync(join(run.temp, 'fitgap-default', 'baseline'))).toBe(false);
+    expect(existsSync(join(run.temp, '..', 'escape.json'))).toBe(false);
+  });
+
+  test('an archive listed over the limit is refused before download', async (context) => {
+    const { expect } = context;
+    const { fake, repo } = await setup(context);
+    artifactSetup(repo, zipFiles({ 'run.json': fixtureText(BASELINE) }), 3 * 1024 * 1024);
+    const run = await review(fake, BETTER, { inputs: inputs({ 'archive-limit-mb': '1' }), files });
+    sane(expect, fake, run);
+    expect(fake.log).toEqual(SEARCH);
+    expect(run.code).toBe(1);
+    expect(run.stdout).toContain('must be at most 1048576 bytes (got 3145728 bytes)');
+  });
+
+  test('an archive that inflates over the limit is stopped while inflating', async (context) => {
+    const { expect } = context;
+    const { fake, repo } = await setup(context);
+    // 2 MiB of spaces deflate to a few kilobytes: a small zip bomb.
+    const padded = fixtureText(BASELINE).replace('{', `{${' '.repeat(2 * 1024 * 1024)}`);
+    const zip = zipFiles({ 'run.json': padded });
+    expect(zip.length).toBeLessThan(20_000);
+    artifactSetup(repo, zip);
+    const run = await review(fake, BETTER, { inputs: inputs({ 'archive-limit-mb': '1' }), files });
+    sane(expect, fake, run);
+    expect(run.code).toBe(1);
+    expect(run.stdout).toContain(
+      'must inflate to at most 1048576 bytes (got more while inflating "run.json")',
+    );
+  });
+
+  test('nothing found: the message names the branch, the workflow and the artifact', async (context) => {
+    const { expect } = context;
+    const { fake } = await setup(context);
+    const run = await review(fake, BETTER, { inputs: inputs(), files });
+    sane(expect, fake, run);
+    expect(run.code).toBe(1);
+    expect(run.stdout).toContain(
+      'found no artifact named "baseline-run" in the 0 newest successful runs of workflow "train.yml" on branch "main"',
+    );
+  });
+});
+
+describe.concurrent('fork-safe pattern: review uploads, workflow_run publishes', () => {
+  /** Runs review mode as a fork PR would (comment off), and zips its report folder as upload-artifact does. */
+  async function uploadedReport(fake: FakeGitHub, candidate: string): Promise<Uint8Array> {
+    const run = await review(fake, candidate, {
+      inputs: { candidate: 'runs/candidate.json', baseline: 'runs/baseline.json', comment: 'off' },
+    });
+    const dir = run.outputs['report-dir'] ?? '';
+    return zipFiles({
+      'review.json': readFileSync(join(dir, 'review.json')),
+      'pull-request.json': readFileSync(join(dir, 'pull-request.json')),
+    });
+  }
+  const event = {
+    action: 'completed',
+    workflow_run: {
+      id: 777,
+      head_sha: HEAD,
+      event: 'pull_request',
+      conclusion: 'failure',
+      head_repository: { full_name: 'fork/r' },
+      pull_requests: [],
+    },
+    repository: { full_name: 'o/r', default_branch: 'main' },
+  };
+  const publish = (fake: FakeGitHub) =>
+    runAction({
+      apiUrl: fake.url,
+      eventName: 'workflow_run',
+      payload: event,
+      inputs: { mode: 'publish' },
+    });
+
+  test('downloads the report, checks the PR, comments and creates the check run on its head', async (context) => {
+    const { expect } = context;
+    const { fake, repo } = await setup(context);
+    repo.pulls.set(7, { headSha: HEAD, headRepo: 'fork/r', baseRef: 'main' });
+    repo.artifacts.push({
+      id: 90,
+      runId: 777,
+      name: 'fitgap-report',
+      zip: await uploadedReport(fake, WORSE),
+    });
+    fake.log.length = 0;
+    const run = await publish(fake);
+    sane(expect, fake, run);
+    expect(fake.log).toEqual([
+      'GET /repos/o/r/actions/runs/777/artifacts?name=fitgap-report&per_page=100',
+      'GET /repos/o/r/actions/artifacts/90/zip',
+      'GET /storage/artifacts/90.zip?sig=abc',
+      PULL,
+      COMMENTS,
+      POST,
+      COMMENTS,
+      'POST /repos/o/r/check-runs',
+    ]);
+    expect(repo.comments).toHaveLength(1);
+    expect(repo.comments[0]?.body).toContain(`head=${HEAD}`);
+    expect(repo.checkRuns).toHaveLength(1);
+    expect(repo.checkRuns[0]).toMatchObject({
+      name: 'fitgap',
+      head_sha: HEAD,
+      status: 'completed',
+      conclusion: 'failure',
+      details_url: 'https://github.invalid/o/r/actions/runs/9001',
+    });
+    expect(JSON.stringify(repo.checkRuns[0])).toContain('worse-validation');
+    // The gate lives in the check run; the publish step itself succeeded.
+    expect(run.code).toBe(0);
+    expect(run.outputs['gate']).toBe('fail');
+  });
+
+  test('a report naming another commit is refused: no comment, no check', async (context) => {
+    const { expect } = context;
+    const { fake, repo } = await setup(context);
+    repo.pulls.set(7, { headSha: HEAD, headRepo: 'fork/r', baseRef: 'main' });
+    const zip = await uploadedReport(fake, BETTER);
+    repo.artifacts.push({ id: 91, runId: 777, name: 'fitgap-report', zip });
+    fake.log.length = 0;
+    const forged = { ...event, workflow_run: { ...event.workflow_run, head_sha: OLD_HEAD } };
+    const run = await runAction({
+      apiUrl: fake.url,
+      eventName: 'workflow_run',
+      payload: forged,
+      inputs: { mode: 'publish' },
+    });
+    sane(expect, fake, run);
+    expect(run.code).toBe(1);
+    expect(run.stdout).toContain(
+      `must name this repository (o/r) and the run's head commit (${OLD_HEAD})`,
+    );
+    expect(fake.log.filter((l) => !l.startsWith('GET'))).toEqual([]);
+    expect(repo.comments).toEqual([]);
+    expect(repo.checkRuns).toEqual([]);
+  });
+
+  test('a PR whose head is in another repository than the run is refused', async (context) => {
+    const { expect } = context;
+    const { fake, repo } = await setup(context);
+    repo.pulls.set(7, { headSha: HEAD, headRepo: 'someone-else/r', baseRef: 'main' });
+    repo.artifacts.push({
+      id: 92,
+      runId: 777,
+      name: 'fitgap-report',
+      zip: await uploadedReport(fake, BETTER),
+    });
+    const run = await publish(fake);
+    sane(expect, fake, run);
+    expect(run.code).toBe(1);
+    expect(run.stdout).toContain('must name a PR whose head is in fork/r');
+    expect(repo.comments).toEqual([]);
+    expect(repo.checkRuns).toEqual([]);
+  });
+});
