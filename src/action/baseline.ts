@@ -78,8 +78,9 @@ function runFilter(settings: Settings, context: RunContext): RunFilter {
   return { branch };
 }
 
-/** The running workflow's file name, from GITHUB_WORKFLOW_REF or else from the run itself. */
+/** The workflow to search: the input, else the running one (from GITHUB_WORKFLOW_REF or the run). */
 async function currentWorkflow(deps: BaselineDeps): Promise<string | number> {
+  if (deps.settings.baselineWorkflow !== null) return deps.settings.baselineWorkflow;
   const fromRef =
     deps.settings.workflowRef === null ? null : workflowFileFromRef(deps.settings.workflowRef);
   if (fromRef !== null) return fromRef;

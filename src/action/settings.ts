@@ -37,6 +37,8 @@ export interface Settings {
   baselineArtifact: string | null;
   /** Branch or full commit sha whose newest successful run supplies the baseline artifact. */
   baselineRef: string | null;
+  /** Workflow file (`train.yml`) whose runs hold the baseline artifact; null: the running workflow. */
+  baselineWorkflow: string | null;
   config: string | null;
   comment: CommentMode;
   commentKey: string;
@@ -145,6 +147,7 @@ export function readSettings(env: Env = process.env): Settings {
     baseline,
     baselineArtifact,
     baselineRef: optional('baseline-ref'),
+    baselineWorkflow: optional('baseline-workflow'),
     config: optional('config'),
     comment: oneOf<CommentMode>('comment', ['update', 'new', 'off'], issues),
     commentKey,

@@ -418,6 +418,40 @@ describe.concurrent('baseline from an artifact of the base branch', () => {
     );
   });
 
+  test('audit: the baseline is the run of another workflow for a given commit', async (context) => {
+    const { expect } = context;
+    const { fake, repo } = await setup(context);
+    const sha = '9'.repeat(40);
+    repo.runs.push({
+      id: 601,
+      workflowFile: 'pr-review.yml',
+      headSha: sha,
+      headBranch: 'main',
+      event: 'push',
+      conclusion: 'success',
+      headRepo: 'o/r',
+    });
+    repo.artifacts.push({
+      id: 81,
+      runId: 601,
+      name: 'baseline-run',
+      zip: zipFiles({ 'run.json': fixtureText(BASELINE) }),
+    });
+    const run = await review(fake, BETTER, {
+      eventName: 'workflow_dispatch',
+      payload: { inputs: {}, repository: { full_name: 'o/r', default_branch: 'main' } },
+      inputs: inputs({ 'baseline-ref': sha, 'baseline-workflow': 'pr-review.yml' }),
+      files,
+    });
+    sane(expect, fake, run);
+    expect(fake.log.slice(0, 2)).toEqual([
+      `GET /repos/o/r/actions/workflows/pr-review.yml/runs?status=success&per_page=20&head_sha=${sha}`,
+      'GET /repos/o/r/actions/runs/601/artifacts?name=baseline-run&per_page=100',
+    ]);
+    expect(run.code).toBe(0);
+    expect(run.outputs['validation-change']).toBe('better');
+  });
+
   test('nothing found: the message names the branch, the workflow and the artifact', async (context) => {
     const { expect } = context;
     const { fake } = await setup(context);

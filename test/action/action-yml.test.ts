@@ -1,0 +1,66 @@
+/** Pins the action's public surface: its inputs, outputs and runtime, and that the code matches them. */
+import { readFileSync } from 'node:fs';
+import { join } from 'node:path';
+import { expect, test } from 'vitest';
+import { ROOT, actionYml } from './harness.js';
+
+const yml = actionYml();
+
+test('inputs and their defaults', () => {
+  const defaults = Object.fromEntries(
+    Object.entries(yml.inputs).map(([name, spec]) => [name, spec.default ?? null]),
+  );
+  expect(defaults).toEqual({
+    mode: 'review',
+    candidate: null,
+    baseline: null,
+    'baseline-artifact': null,
+    'baseline-ref': null,
+    'baseline-workflow': null,
+    config: null,
+    'github-token': '${{ github.token }}',
+    comment: 'update',
+    'comment-key': 'default',
+    'fail-on': 'worse-validation',
+    alpha: null,
+    'min-effect': null,
+    'status-check': 'auto',
+    'report-artifact': 'fitgap-report',
+    'archive-limit-mb': '50',
+  });
+});
+
+test('outputs', () => {
+  expect(Object.keys(yml.outputs)).toEqual([
+    'movement',
+    'validation-change',
+    'candidate-diagnosis',
+    'gate',
+    'report-path',
+    'report-dir',
+    'comment-url',
+  ]);
+});
+
+test('runs the bundled entry on node24', () => {
+  const runs = (yml as unknown as { runs: unknown }).runs;
+  expect(runs).toEqual({ using: 'node24', main: 'dist/index.js' });
+});
+
+test('every input the settings reader asks for is declared, and every declared one is read', () => {
+  const source = readFileSync(join(ROOT, 'src/action/settings.ts'), 'utf8');
+  const read = new Set(
+    [
+      ...source.matchAll(/(?:optional|required|oneOf(?:<\w+>)?|number|getInput)\(\s*'([a-z-]+)'/g),
+    ].map((m) => m[1]),
+  );
+  expect([...read].sort()).toEqual(Object.keys(yml.inputs).sort());
+});
+
+test('every output the action sets is declared', () => {
+  const sources = ['publish-steps.ts']
+    .map((f) => readFileSync(join(ROOT, 'src/action', f), 'utf8'))
+    .join('\n');
+  const set = new Set([...sources.matchAll(/setOutput\('([a-z-]+)'/g)].map((m) => m[1]));
+  expect([...set].sort()).toEqual(Object.keys(yml.outputs).sort());
+});
