@@ -6,7 +6,16 @@
  * environment leaks in but PATH.
  */
 import { execFileSync, spawn } from 'node:child_process';
-import { copyFileSync, mkdtempSync, readFileSync, writeFileSync, mkdirSync } from 'node:fs';
+import {
+  copyFileSync,
+  existsSync,
+  mkdirSync,
+  mkdtempSync,
+  readdirSync,
+  readFileSync,
+  statSync,
+  writeFileSync,
+} from 'node:fs';
 import { tmpdir } from 'node:os';
 import { dirname, join, resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
@@ -19,7 +28,23 @@ export const HEAD = 'a'.repeat(40);
 export const OLD_HEAD = 'b'.repeat(40);
 export const BASE_SHA = 'c'.repeat(40);
 
+function newestSource(dir: string): number {
+  let newest = 0;
+  for (const entry of readdirSync(dir, { withFileTypes: true })) {
+    const path = join(dir, entry.name);
+    newest = Math.max(newest, entry.isDirectory() ? newestSource(path) : statSync(path).mtimeMs);
+  }
+  return newest;
+}
+
+/**
+ * Builds `dist/` with the project's build script when the bundle is missing or older than any
+ * source file. CI builds before testing, so there the bundle is fresh and the test files that
+ * run built entries never rewrite it under each other.
+ */
 export function buildBundle(): void {
+  const bundle = join(ROOT, 'dist/index.js');
+  if (existsSync(bundle) && statSync(bundle).mtimeMs >= newestSource(join(ROOT, 'src'))) return;
   execFileSync('npm', ['run', '-s', 'build'], { cwd: ROOT, stdio: 'pipe' });
 }
 
