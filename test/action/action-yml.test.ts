@@ -21,7 +21,7 @@ test('inputs and their defaults', () => {
     'github-token': '${{ github.token }}',
     comment: 'update',
     'comment-key': 'default',
-    'fail-on': 'worse-validation',
+    'fail-on': null,
     alpha: null,
     'min-effect': null,
     'status-check': 'auto',

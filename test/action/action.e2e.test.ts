@@ -65,7 +65,7 @@ describe.concurrent('review mode on a pull request', () => {
     expect(repo.comments).toHaveLength(1);
     const [comment] = repo.comments;
     expect(comment?.body).toContain(`<!-- fitgap:review key=default head=${HEAD} -->`);
-    // The gate (fail-on: worse-validation, the action.yml default) fails the step after commenting.
+    // The gate (fail-on: worse-validation, the default when neither input nor config sets it) fails the step after commenting.
     expect(run.code).toBe(1);
     expect(run.stdout).toMatch(/::error::fitgap gate failed:%0A- worse-validation/);
     const report = JSON.parse(readFileSync(run.outputs['report-path'] ?? '', 'utf8')) as Record<
