@@ -239,7 +239,7 @@ export function chooseLevers(ctx: LeverContext): { levers: Lever[]; nonLevers: s
       if (id === 'early-stopping') {
         if (ep !== null && ep.stoppedLate) {
           score += 12;
-          reason = `Validation minimum at epoch ${formatNumber(ep.bestX)} of ${formatNumber(ep.finalX)}; stopping there saves ${formatChange(ep.finalValidation - ep.bestValidation, kind).replace(/^\+/, '')} (generalization loss ${ep.gl.toFixed(1)}%).`;
+          reason = `Validation minimum at epoch ${formatNumber(ep.bestX)} of ${formatNumber(ep.finalX)}; stopping there saves ${formatChange(ep.finalValidation - ep.bestValidation, kind).replace(/^\+/, '')} ${ep.gl === null ? '' : ` (generalization loss ${ep.gl.toFixed(1)}%)`}.`;
         } else score -= 15;
       }
       if (id === 'train-longer') {

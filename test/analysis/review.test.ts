@@ -214,3 +214,21 @@ describe('the DESIGN.md example', () => {
     expect(review.movement).toBe('toward-overfitting');
   });
 });
+
+describe('curves with a perfect validation point', () => {
+  it('reports generalization loss as unknown instead of Infinity, and the JSON report renders', async () => {
+    const { renderJson } = await import('../../src/report/index.js');
+    const run = makeRun({ kind: 'proportion', train: [0.01, 0.01], validation: [0.02, 0.02] });
+    run.curves = {
+      epochs: Array.from({ length: 12 }, (_, i) => ({
+        x: i + 1,
+        train: 0.1 / (i + 1),
+        validation: i === 5 ? 0 : 0.05,
+      })),
+    };
+    const review = buildReview({ baseline: run, candidate: run, settings: SETTINGS });
+    const epochs = review.candidate.curves.epochs;
+    expect(epochs !== undefined && !('skipped' in epochs) ? epochs.gl : 'missing').toBeNull();
+    expect(() => renderJson(review)).not.toThrow();
+  });
+});

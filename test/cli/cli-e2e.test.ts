@@ -106,7 +106,7 @@ describe('fitgap CLI (built)', () => {
   it('prints plain text without colour under NO_COLOR and within 80 columns', async () => {
     const result = await fitgap(['demo'], { NO_COLOR: '1' });
     expect(result.code).toBe(0);
-    expect(result.stdout).not.toMatch(/\u001b\[/);
+    expect(result.stdout).not.toContain('\u001b[');
     for (const line of result.stdout.split('\n')) expect(line.length).toBeLessThanOrEqual(80);
     expect(result.stdout).toContain('npm run -s demo -- 2-lambda-3');
   });

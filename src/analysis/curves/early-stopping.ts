@@ -108,7 +108,7 @@ export function upStop(validation: readonly number[], s: number, k = STRIP): num
 
 export interface EpochVerdict {
   bestIndex: number;
-  gl: number;
+  gl: number | null;
   /** PQ at the last strip end; null without train values or before the first strip end. */
   pq: number | null;
   stoppedLate: boolean;
@@ -155,8 +155,9 @@ export function epochVerdict(
   for (const s of UP_STRIPS) stopsAt[`UP_${s}`] = upStop(validation, s);
   return {
     bestIndex,
-    gl,
-    pq,
+    // GL is relative to the best validation error; with a best of exactly 0 it is undefined.
+    gl: Number.isFinite(gl) ? gl : null,
+    pq: pq !== null && Number.isFinite(pq) ? pq : null,
     stoppedLate: bestIndex < last && gl > LATE_GL,
     stoppedEarly,
     stopsAt,

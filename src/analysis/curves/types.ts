@@ -19,7 +19,8 @@ export interface EpochsEvidence {
   finalX: number;
   finalValidation: number;
   /** Prechelt's generalization loss at the last point, in percent. */
-  gl: number;
+  /** Null when the best validation error is exactly 0 (GL is relative to it, so undefined). */
+  gl: number | null;
   /** Prechelt's progress quotient GL/P_k at the last strip end (k = 5); null without train values. */
   pq: number | null;
   /** The run ends past the validation minimum with GL > 5 (Prechelt's GL_5 would have stopped it). */
