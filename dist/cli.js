@@ -21516,14 +21516,15 @@ function chooseLevers(ctx) {
   const order = targets(ctx.candidate.diagnosis, ctx.candidate);
   order.forEach((target, t) => {
     const component = ctx.candidate.components[target];
-    const size = component.value === null ? "" : ` (${target} ${v(component.value)} of validation error ${v(ctx.candidate.errorLevel)})`;
+    const label = target === "bias" ? "avoidable bias" : "variance";
+    const size = component.value === null ? "" : `: ${label} ${v(component.value)} against a validation error of ${v(ctx.candidate.errorLevel)}`;
     BY_TARGET[target].forEach((id, i) => {
       let score = 60 - t * 20 - i * 2;
-      let reason = `${LEVER_CATALOGUE[id].meaning[0]?.toUpperCase()}${LEVER_CATALOGUE[id].meaning.slice(1)}: the candidate shows high ${target}${size}.`;
+      let reason = `The candidate has high ${target}${size}.`;
       const evidence = [];
       const lc = learning(curves);
       const reg = regularization(curves);
-      const ep = epochs(curves);
+      const ep2 = epochs(curves);
       if (id === "more-data" && lc !== null) {
         const twice = lc.projections[0];
         if (twice !== void 0) {
@@ -21553,16 +21554,22 @@ function chooseLevers(ctx) {
         }
       }
       if (id === "early-stopping") {
-        if (ep !== null && ep.stoppedLate) {
+        if (ep2 !== null && ep2.stoppedLate) {
           score += 12;
-          reason = `Validation minimum at epoch ${formatNumber(ep.bestX)} of ${formatNumber(ep.finalX)}; stopping there saves ${formatChange(ep.finalValidation - ep.bestValidation, kind).replace(/^\+/, "")} ${ep.gl === null ? "" : ` (generalization loss ${ep.gl.toFixed(1)}%)`}.`;
-        } else score -= 15;
+          reason = `Validation minimum at epoch ${formatNumber(ep2.bestX)} of ${formatNumber(ep2.finalX)}; stopping there saves ${formatChange(ep2.finalValidation - ep2.bestValidation, kind).replace(/^\+/, "")} ${ep2.gl === null ? "" : ` (generalization loss ${ep2.gl.toFixed(1)}%)`}.`;
+        } else {
+          score -= 15;
+          reason = `${reason} ${ep2 === null ? "No epoch curve to confirm it." : "The epoch curve does not show training past the validation minimum."}`;
+        }
       }
       if (id === "train-longer") {
-        if (ep !== null && ep.stoppedEarly) {
+        if (ep2 !== null && ep2.stoppedEarly) {
           score += 12;
-          reason = `Train and validation ${ctx.metricName} were both still falling at epoch ${formatNumber(ep.finalX)}: train longer.`;
-        } else score -= 15;
+          reason = `Train and validation ${ctx.metricName} were both still falling at epoch ${formatNumber(ep2.finalX)}: train longer.`;
+        } else {
+          score -= 15;
+          reason = `${reason} ${ep2 === null ? "No epoch curve to confirm it." : "The epoch curve does not show both errors still falling at the end."}`;
+        }
       }
       if (id === "weaker-regularization" && ctx.lambda === void 0 && reg === null) score -= 10;
       const note = pulledNote(id);
@@ -21573,6 +21580,21 @@ function chooseLevers(ctx) {
       add(id, score, reason, evidence);
     });
   });
+  const ep = epochs(curves);
+  if (ep !== null && ep.stoppedLate && !drafts.has("early-stopping")) {
+    add(
+      "early-stopping",
+      35,
+      `Validation minimum at epoch ${formatNumber(ep.bestX)} of ${formatNumber(ep.finalX)}; stopping there saves ${formatChange(ep.finalValidation - ep.bestValidation, kind).replace(/^\+/, "")}.`
+    );
+  }
+  if (ep !== null && ep.stoppedEarly && !drafts.has("train-longer")) {
+    add(
+      "train-longer",
+      35,
+      `Train and validation ${ctx.metricName} were both still falling at epoch ${formatNumber(ep.finalX)}.`
+    );
+  }
   if (ctx.candidate.diagnosis === "data-mismatch" || ctx.candidate.components.mismatch.present) {
     const d = ctx.candidate.components.mismatch.value ?? 0;
     add(
@@ -23351,7 +23373,9 @@ function renderText(review, options) {
     }
     out.push(...rest);
   }
-  out.push("", heading("Splits"), ...textTable(splitsTable(review), width), "");
+  const splits = splitsTable(review);
+  const fitted = naturalWidth(splits) > width ? withoutColumn(splits, "Reading") : splits;
+  out.push("", heading("Splits"), ...textTable(fitted, width), "");
   const decomposition = decompositionTable(review, true);
   const diagnosis = decomposition.rows.pop();
   out.push(heading("Error decomposition"), ...textTable(decomposition, width));
@@ -23412,6 +23436,19 @@ function renderText(review, options) {
   for (const line of wrap(CAUTION, width, "")) out.push(paint(line, ANSI.dim));
   return `${out.join("\n")}
 `;
+}
+function naturalWidth(t) {
+  const rows = [t.header, ...t.rows];
+  const widths = t.header.map(
+    (_, c) => Math.max(...rows.map((r) => Array.from(r[c] ?? "").length))
+  );
+  return 2 + widths.reduce((a, b) => a + b, 0) + 2 * (widths.length - 1);
+}
+function withoutColumn(t, header) {
+  const c = t.header.indexOf(header);
+  if (c < 0) return t;
+  const drop = (row) => row.filter((_, i) => i !== c);
+  return { header: drop(t.header), align: drop(t.align), rows: t.rows.map(drop) };
 }
 function wrap(text, width, indent, first = indent) {
   const lines = [];

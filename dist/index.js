@@ -49008,14 +49008,15 @@ function chooseLevers(ctx) {
   const order = targets(ctx.candidate.diagnosis, ctx.candidate);
   order.forEach((target, t) => {
     const component = ctx.candidate.components[target];
-    const size = component.value === null ? "" : ` (${target} ${v(component.value)} of validation error ${v(ctx.candidate.errorLevel)})`;
+    const label = target === "bias" ? "avoidable bias" : "variance";
+    const size = component.value === null ? "" : `: ${label} ${v(component.value)} against a validation error of ${v(ctx.candidate.errorLevel)}`;
     BY_TARGET[target].forEach((id, i2) => {
       let score = 60 - t * 20 - i2 * 2;
-      let reason = `${LEVER_CATALOGUE[id].meaning[0]?.toUpperCase()}${LEVER_CATALOGUE[id].meaning.slice(1)}: the candidate shows high ${target}${size}.`;
+      let reason = `The candidate has high ${target}${size}.`;
       const evidence = [];
       const lc = learning(curves);
       const reg = regularization(curves);
-      const ep = epochs(curves);
+      const ep2 = epochs(curves);
       if (id === "more-data" && lc !== null) {
         const twice = lc.projections[0];
         if (twice !== void 0) {
@@ -49045,16 +49046,22 @@ function chooseLevers(ctx) {
         }
       }
       if (id === "early-stopping") {
-        if (ep !== null && ep.stoppedLate) {
+        if (ep2 !== null && ep2.stoppedLate) {
           score += 12;
-          reason = `Validation minimum at epoch ${formatNumber(ep.bestX)} of ${formatNumber(ep.finalX)}; stopping there saves ${formatChange(ep.finalValidation - ep.bestValidation, kind).replace(/^\+/, "")} ${ep.gl === null ? "" : ` (generalization loss ${ep.gl.toFixed(1)}%)`}.`;
-        } else score -= 15;
+          reason = `Validation minimum at epoch ${formatNumber(ep2.bestX)} of ${formatNumber(ep2.finalX)}; stopping there saves ${formatChange(ep2.finalValidation - ep2.bestValidation, kind).replace(/^\+/, "")} ${ep2.gl === null ? "" : ` (generalization loss ${ep2.gl.toFixed(1)}%)`}.`;
+        } else {
+          score -= 15;
+          reason = `${reason} ${ep2 === null ? "No epoch curve to confirm it." : "The epoch curve does not show training past the validation minimum."}`;
+        }
       }
       if (id === "train-longer") {
-        if (ep !== null && ep.stoppedEarly) {
+        if (ep2 !== null && ep2.stoppedEarly) {
           score += 12;
-          reason = `Train and validation ${ctx.metricName} were both still falling at epoch ${formatNumber(ep.finalX)}: train longer.`;
-        } else score -= 15;
+          reason = `Train and validation ${ctx.metricName} were both still falling at epoch ${formatNumber(ep2.finalX)}: train longer.`;
+        } else {
+          score -= 15;
+          reason = `${reason} ${ep2 === null ? "No epoch curve to confirm it." : "The epoch curve does not show both errors still falling at the end."}`;
+        }
       }
       if (id === "weaker-regularization" && ctx.lambda === void 0 && reg === null) score -= 10;
       const note = pulledNote(id);
@@ -49065,6 +49072,21 @@ function chooseLevers(ctx) {
       add(id, score, reason, evidence);
     });
   });
+  const ep = epochs(curves);
+  if (ep !== null && ep.stoppedLate && !drafts.has("early-stopping")) {
+    add(
+      "early-stopping",
+      35,
+      `Validation minimum at epoch ${formatNumber(ep.bestX)} of ${formatNumber(ep.finalX)}; stopping there saves ${formatChange(ep.finalValidation - ep.bestValidation, kind).replace(/^\+/, "")}.`
+    );
+  }
+  if (ep !== null && ep.stoppedEarly && !drafts.has("train-longer")) {
+    add(
+      "train-longer",
+      35,
+      `Train and validation ${ctx.metricName} were both still falling at epoch ${formatNumber(ep.finalX)}.`
+    );
+  }
   if (ctx.candidate.diagnosis === "data-mismatch" || ctx.candidate.components.mismatch.present) {
     const d = ctx.candidate.components.mismatch.value ?? 0;
     add(

@@ -197,13 +197,14 @@ export function chooseLevers(ctx: LeverContext): { levers: Lever[]; nonLevers: s
   const order = targets(ctx.candidate.diagnosis, ctx.candidate);
   order.forEach((target, t) => {
     const component = ctx.candidate.components[target];
+    const label = target === 'bias' ? 'avoidable bias' : 'variance';
     const size =
       component.value === null
         ? ''
-        : ` (${target} ${v(component.value)} of validation error ${v(ctx.candidate.errorLevel)})`;
+        : `: ${label} ${v(component.value)} against a validation error of ${v(ctx.candidate.errorLevel)}`;
     BY_TARGET[target].forEach((id, i) => {
       let score = 60 - t * 20 - i * 2;
-      let reason = `${LEVER_CATALOGUE[id].meaning[0]?.toUpperCase()}${LEVER_CATALOGUE[id].meaning.slice(1)}: the candidate shows high ${target}${size}.`;
+      let reason = `The candidate has high ${target}${size}.`;
       const evidence: string[] = [];
       const lc = learning(curves);
       const reg = regularization(curves);
@@ -240,13 +241,19 @@ export function chooseLevers(ctx: LeverContext): { levers: Lever[]; nonLevers: s
         if (ep !== null && ep.stoppedLate) {
           score += 12;
           reason = `Validation minimum at epoch ${formatNumber(ep.bestX)} of ${formatNumber(ep.finalX)}; stopping there saves ${formatChange(ep.finalValidation - ep.bestValidation, kind).replace(/^\+/, '')} ${ep.gl === null ? '' : ` (generalization loss ${ep.gl.toFixed(1)}%)`}.`;
-        } else score -= 15;
+        } else {
+          score -= 15;
+          reason = `${reason} ${ep === null ? 'No epoch curve to confirm it.' : 'The epoch curve does not show training past the validation minimum.'}`;
+        }
       }
       if (id === 'train-longer') {
         if (ep !== null && ep.stoppedEarly) {
           score += 12;
           reason = `Train and validation ${ctx.metricName} were both still falling at epoch ${formatNumber(ep.finalX)}: train longer.`;
-        } else score -= 15;
+        } else {
+          score -= 15;
+          reason = `${reason} ${ep === null ? 'No epoch curve to confirm it.' : 'The epoch curve does not show both errors still falling at the end.'}`;
+        }
       }
       if (id === 'weaker-regularization' && ctx.lambda === undefined && reg === null) score -= 10;
       const note = pulledNote(id);
@@ -258,6 +265,22 @@ export function chooseLevers(ctx: LeverContext): { levers: Lever[]; nonLevers: s
     });
   });
 
+  // The epoch curve speaks for itself whatever the diagnosis.
+  const ep = epochs(curves);
+  if (ep !== null && ep.stoppedLate && !drafts.has('early-stopping')) {
+    add(
+      'early-stopping',
+      35,
+      `Validation minimum at epoch ${formatNumber(ep.bestX)} of ${formatNumber(ep.finalX)}; stopping there saves ${formatChange(ep.finalValidation - ep.bestValidation, kind).replace(/^\+/, '')}.`,
+    );
+  }
+  if (ep !== null && ep.stoppedEarly && !drafts.has('train-longer')) {
+    add(
+      'train-longer',
+      35,
+      `Train and validation ${ctx.metricName} were both still falling at epoch ${formatNumber(ep.finalX)}.`,
+    );
+  }
   if (ctx.candidate.diagnosis === 'data-mismatch' || ctx.candidate.components.mismatch.present) {
     const d = ctx.candidate.components.mismatch.value ?? 0;
     add(

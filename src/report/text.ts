@@ -62,7 +62,11 @@ export function renderText(review: Review, options: TextOptions): string {
     }
     out.push(...rest);
   }
-  out.push('', heading('Splits'), ...textTable(splitsTable(review), width), '');
+  // When the splits table is too wide, drop its Reading column (the sign of Δ and the headline
+  // carry it) rather than cut the split names.
+  const splits = splitsTable(review);
+  const fitted = naturalWidth(splits) > width ? withoutColumn(splits, 'Reading') : splits;
+  out.push('', heading('Splits'), ...textTable(fitted, width), '');
   const decomposition = decompositionTable(review, true);
   const diagnosis = decomposition.rows.pop();
   out.push(heading('Error decomposition'), ...textTable(decomposition, width));
@@ -124,6 +128,23 @@ export function renderText(review: Review, options: TextOptions): string {
   out.push('');
   for (const line of wrap(CAUTION, width, '')) out.push(paint(line, ANSI.dim));
   return `${out.join('\n')}\n`;
+}
+
+/** Columns a table needs without cutting any cell. */
+function naturalWidth(t: Table): number {
+  const rows = [t.header, ...t.rows];
+  const widths = t.header.map((_, c) =>
+    Math.max(...rows.map((r) => Array.from(r[c] ?? '').length)),
+  );
+  return 2 + widths.reduce((a, b) => a + b, 0) + 2 * (widths.length - 1);
+}
+
+/** A table without one of its columns (by header). */
+function withoutColumn(t: Table, header: string): Table {
+  const c = t.header.indexOf(header);
+  if (c < 0) return t;
+  const drop = <T>(row: readonly T[]): T[] => row.filter((_, i) => i !== c);
+  return { header: drop(t.header), align: drop(t.align), rows: t.rows.map(drop) };
 }
 
 /** Word-wraps to `width` columns; the first line starts with `first`, the others with `indent`. */

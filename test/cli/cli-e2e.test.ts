@@ -109,6 +109,9 @@ describe('fitgap CLI (built)', () => {
     expect(result.stdout).not.toContain('\u001b[');
     for (const line of result.stdout.split('\n')) expect(line.length).toBeLessThanOrEqual(80);
     expect(result.stdout).toContain('npm run -s demo -- 2-lambda-3');
+    // Split names are never cut to fit the width.
+    expect(result.stdout).toMatch(/^ {2}train-dev {2,}/m);
+    expect(result.stdout).toMatch(/^ {2}validation {2,}/m);
   });
 
   it('validates files and reports bad ones with exit 2', async () => {

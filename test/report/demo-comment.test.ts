@@ -1,0 +1,43 @@
+// @vitest-environment jsdom
+// (jsdom: mermaid.parse needs a DOM window for DOMPurify; see mermaid.test.ts.)
+/**
+ * Snapshots of the PR comment for each bundled demo candidate, built from the files on disk
+ * through the same adapter the CLI uses, plus the safety checks every comment must pass.
+ */
+import mermaid from 'mermaid';
+import { describe, expect, it } from 'vitest';
+import { renderMarkdown } from '../../src/report/index.js';
+import { reviewFiles } from '../../src/review-files.js';
+import { mermaidBlocks, rawHtml, tableShapes, toDocument } from './gfm.js';
+
+describe.each(['1-interactions', '2-lambda-3', '3-more-data'])('demo %s comment', (name) => {
+  it('matches its snapshot, parses as safe GFM and valid Mermaid', async () => {
+    const { review, files } = await reviewFiles({
+      baseline: 'demo/baseline.json',
+      candidate: `demo/${name}.json`,
+      config: 'demo/fitgap.yml',
+    });
+    const md = renderMarkdown(review, {
+      commentKey: 'demo',
+      headSha: 'a91f3d2b6c',
+      provenance: {
+        files: [
+          { label: 'baseline', ...files.baseline },
+          { label: 'candidate', ...files.candidate },
+        ],
+      },
+    });
+    await expect(md).toMatchFileSnapshot(`__snapshots__/demo-${name}.md`);
+    for (const chunk of rawHtml(md)) {
+      expect(chunk).toMatch(
+        /^(<!-- fitgap:review [^>]*-->|<details>\n<summary>[^<>&\n]*<\/summary>|<\/details>)$/,
+      );
+    }
+    const doc = toDocument(md);
+    for (const shape of tableShapes(doc)) expect(new Set(shape.columns).size).toBe(1);
+    const blocks = mermaidBlocks(md);
+    expect(blocks.length).toBeGreaterThanOrEqual(2);
+    for (const block of blocks) await expect(mermaid.parse(block)).resolves.toBeTruthy();
+    expect(md.length).toBeLessThan(60_000);
+  });
+});
