@@ -2172,9 +2172,9 @@ var require_dispatcher_base = __commonJS({
       }
       close(callback) {
         if (callback === void 0) {
-          return new Promise((resolve4, reject) => {
+          return new Promise((resolve5, reject) => {
             this.close((err2, data) => {
-              return err2 ? reject(err2) : resolve4(data);
+              return err2 ? reject(err2) : resolve5(data);
             });
           });
         }
@@ -2212,12 +2212,12 @@ var require_dispatcher_base = __commonJS({
           err2 = null;
         }
         if (callback === void 0) {
-          return new Promise((resolve4, reject) => {
+          return new Promise((resolve5, reject) => {
             this.destroy(err2, (err3, data) => {
               return err3 ? (
                 /* istanbul ignore next: should never error */
                 reject(err3)
-              ) : resolve4(data);
+              ) : resolve5(data);
             });
           });
         }
@@ -4484,8 +4484,8 @@ var require_util2 = __commonJS({
     function createDeferredPromise() {
       let res;
       let rej;
-      const promise = new Promise((resolve4, reject) => {
-        res = resolve4;
+      const promise = new Promise((resolve5, reject) => {
+        res = resolve5;
         rej = reject;
       });
       return { promise, resolve: res, reject: rej };
@@ -6736,12 +6736,12 @@ upgrade: ${upgrade}\r
           cb();
         }
       }
-      const waitForDrain = () => new Promise((resolve4, reject) => {
+      const waitForDrain = () => new Promise((resolve5, reject) => {
         assert(callback === null);
         if (socket[kError]) {
           reject(socket[kError]);
         } else {
-          callback = resolve4;
+          callback = resolve5;
         }
       });
       socket.on("close", onDrain).on("drain", onDrain);
@@ -7411,12 +7411,12 @@ var require_client_h2 = __commonJS({
           cb();
         }
       }
-      const waitForDrain = () => new Promise((resolve4, reject) => {
+      const waitForDrain = () => new Promise((resolve5, reject) => {
         assert(callback === null);
         if (socket[kError]) {
           reject(socket[kError]);
         } else {
-          callback = resolve4;
+          callback = resolve5;
         }
       });
       h2stream.on("close", onDrain).on("drain", onDrain);
@@ -7895,16 +7895,16 @@ var require_client = __commonJS({
         return this[kNeedDrain] < 2;
       }
       async [kClose]() {
-        return new Promise((resolve4) => {
+        return new Promise((resolve5) => {
           if (this[kSize]) {
-            this[kClosedResolve] = resolve4;
+            this[kClosedResolve] = resolve5;
           } else {
-            resolve4(null);
+            resolve5(null);
           }
         });
       }
       async [kDestroy](err2) {
-        return new Promise((resolve4) => {
+        return new Promise((resolve5) => {
           const requests = this[kQueue].splice(this[kPendingIdx]);
           for (let i2 = 0; i2 < requests.length; i2++) {
             const request2 = requests[i2];
@@ -7915,7 +7915,7 @@ var require_client = __commonJS({
               this[kClosedResolve]();
               this[kClosedResolve] = null;
             }
-            resolve4(null);
+            resolve5(null);
           };
           if (this[kHTTPContext]) {
             this[kHTTPContext].destroy(err2, callback);
@@ -7966,7 +7966,7 @@ var require_client = __commonJS({
         });
       }
       try {
-        const socket = await new Promise((resolve4, reject) => {
+        const socket = await new Promise((resolve5, reject) => {
           client[kConnector]({
             host,
             hostname,
@@ -7978,7 +7978,7 @@ var require_client = __commonJS({
             if (err2) {
               reject(err2);
             } else {
-              resolve4(socket2);
+              resolve5(socket2);
             }
           });
         });
@@ -8314,8 +8314,8 @@ var require_pool_base = __commonJS({
         if (this[kQueue].isEmpty()) {
           await Promise.all(this[kClients].map((c) => c.close()));
         } else {
-          await new Promise((resolve4) => {
-            this[kClosedResolve] = resolve4;
+          await new Promise((resolve5) => {
+            this[kClosedResolve] = resolve5;
           });
         }
       }
@@ -9584,7 +9584,7 @@ var require_readable = __commonJS({
         if (this._readableState.closeEmitted) {
           return null;
         }
-        return await new Promise((resolve4, reject) => {
+        return await new Promise((resolve5, reject) => {
           if (this[kContentLength] > limit) {
             this.destroy(new AbortError());
           }
@@ -9597,7 +9597,7 @@ var require_readable = __commonJS({
             if (signal?.aborted) {
               reject(signal.reason ?? new AbortError());
             } else {
-              resolve4(null);
+              resolve5(null);
             }
           }).on("error", noop4).on("data", function(chunk) {
             limit -= chunk.length;
@@ -9616,7 +9616,7 @@ var require_readable = __commonJS({
     }
     async function consume(stream, type) {
       assert(!stream[kConsume]);
-      return new Promise((resolve4, reject) => {
+      return new Promise((resolve5, reject) => {
         if (isUnusable(stream)) {
           const rState = stream._readableState;
           if (rState.destroyed && rState.closeEmitted === false) {
@@ -9633,7 +9633,7 @@ var require_readable = __commonJS({
             stream[kConsume] = {
               type,
               stream,
-              resolve: resolve4,
+              resolve: resolve5,
               reject,
               length: 0,
               body: []
@@ -9703,18 +9703,18 @@ var require_readable = __commonJS({
       return buffer;
     }
     function consumeEnd(consume2) {
-      const { type, body, resolve: resolve4, stream, length } = consume2;
+      const { type, body, resolve: resolve5, stream, length } = consume2;
       try {
         if (type === "text") {
-          resolve4(chunksDecode(body, length));
+          resolve5(chunksDecode(body, length));
         } else if (type === "json") {
-          resolve4(JSON.parse(chunksDecode(body, length)));
+          resolve5(JSON.parse(chunksDecode(body, length)));
         } else if (type === "arrayBuffer") {
-          resolve4(chunksConcat(body, length).buffer);
+          resolve5(chunksConcat(body, length).buffer);
         } else if (type === "blob") {
-          resolve4(new Blob(body, { type: stream[kContentType] }));
+          resolve5(new Blob(body, { type: stream[kContentType] }));
         } else if (type === "bytes") {
-          resolve4(chunksConcat(body, length));
+          resolve5(chunksConcat(body, length));
         }
         consumeFinish(consume2);
       } catch (err2) {
@@ -9971,9 +9971,9 @@ var require_api_request = __commonJS({
     };
     function request2(opts, callback) {
       if (callback === void 0) {
-        return new Promise((resolve4, reject) => {
+        return new Promise((resolve5, reject) => {
           request2.call(this, opts, (err2, data) => {
-            return err2 ? reject(err2) : resolve4(data);
+            return err2 ? reject(err2) : resolve5(data);
           });
         });
       }
@@ -10196,9 +10196,9 @@ var require_api_stream = __commonJS({
     };
     function stream(opts, factory, callback) {
       if (callback === void 0) {
-        return new Promise((resolve4, reject) => {
+        return new Promise((resolve5, reject) => {
           stream.call(this, opts, factory, (err2, data) => {
-            return err2 ? reject(err2) : resolve4(data);
+            return err2 ? reject(err2) : resolve5(data);
           });
         });
       }
@@ -10483,9 +10483,9 @@ var require_api_upgrade = __commonJS({
     };
     function upgrade(opts, callback) {
       if (callback === void 0) {
-        return new Promise((resolve4, reject) => {
+        return new Promise((resolve5, reject) => {
           upgrade.call(this, opts, (err2, data) => {
-            return err2 ? reject(err2) : resolve4(data);
+            return err2 ? reject(err2) : resolve5(data);
           });
         });
       }
@@ -10577,9 +10577,9 @@ var require_api_connect = __commonJS({
     };
     function connect(opts, callback) {
       if (callback === void 0) {
-        return new Promise((resolve4, reject) => {
+        return new Promise((resolve5, reject) => {
           connect.call(this, opts, (err2, data) => {
-            return err2 ? reject(err2) : resolve4(data);
+            return err2 ? reject(err2) : resolve5(data);
           });
         });
       }
@@ -14442,7 +14442,7 @@ var require_fetch = __commonJS({
       function dispatch({ body }) {
         const url = requestCurrentURL(request2);
         const agent = fetchParams.controller.dispatcher;
-        return new Promise((resolve4, reject) => agent.dispatch(
+        return new Promise((resolve5, reject) => agent.dispatch(
           {
             path: url.pathname + url.search,
             origin: url.origin,
@@ -14518,7 +14518,7 @@ var require_fetch = __commonJS({
               }
               this.body = new Readable({ read: resume });
               const onError = this.onError.bind(this);
-              resolve4({
+              resolve5({
                 status,
                 statusText,
                 headersList,
@@ -14561,7 +14561,7 @@ var require_fetch = __commonJS({
               for (let i2 = 0; i2 < rawHeaders.length; i2 += 2) {
                 headersList.append(bufferToLowerCasedHeaderName(rawHeaders[i2]), rawHeaders[i2 + 1].toString("latin1"), true);
               }
-              resolve4({
+              resolve5({
                 status,
                 statusText: STATUS_CODES[status],
                 headersList,
@@ -18302,8 +18302,8 @@ var require_util8 = __commonJS({
       return true;
     }
     function delay(ms) {
-      return new Promise((resolve4) => {
-        setTimeout(resolve4, ms).unref();
+      return new Promise((resolve5) => {
+        setTimeout(resolve5, ms).unref();
       });
     }
     module.exports = {
@@ -22112,7 +22112,7 @@ var require_compile = __commonJS({
       const schOrFunc = root.refs[ref];
       if (schOrFunc)
         return schOrFunc;
-      let _sch = resolve4.call(this, root, ref);
+      let _sch = resolve5.call(this, root, ref);
       if (_sch === void 0) {
         const schema = (_a2 = root.localRefs) === null || _a2 === void 0 ? void 0 : _a2[ref];
         const { schemaId } = this.opts;
@@ -22139,7 +22139,7 @@ var require_compile = __commonJS({
     function sameSchemaEnv(s1, s2) {
       return s1.schema === s2.schema && s1.root === s2.root && s1.baseId === s2.baseId;
     }
-    function resolve4(root, ref) {
+    function resolve5(root, ref) {
       let sch;
       while (typeof (sch = this.refs[ref]) == "string")
         ref = sch;
@@ -23003,7 +23003,7 @@ var require_fast_uri = __commonJS({
       }
       return uri;
     }
-    function resolve4(baseURI, relativeURI, options) {
+    function resolve5(baseURI, relativeURI, options) {
       const schemelessOptions = options ? Object.assign({ scheme: "null" }, options) : { scheme: "null" };
       const {
         parsed: baseParsed,
@@ -23039,50 +23039,50 @@ var require_fast_uri = __commonJS({
       schemelessOptions.skipEscape = true;
       return serialize2(resolved, schemelessOptions);
     }
-    function resolveComponent(base, relative2, options, skipNormalization) {
+    function resolveComponent(base, relative3, options, skipNormalization) {
       const target = {};
       if (!skipNormalization) {
         base = parse4(serialize2(base, options), options);
-        relative2 = parse4(serialize2(relative2, options), options);
+        relative3 = parse4(serialize2(relative3, options), options);
       }
       options = options || {};
-      if (!options.tolerant && relative2.scheme) {
-        target.scheme = relative2.scheme;
-        target.userinfo = relative2.userinfo;
-        target.host = relative2.host;
-        target.port = relative2.port;
-        target.path = removeDotSegments(relative2.path || "");
-        target.query = relative2.query;
+      if (!options.tolerant && relative3.scheme) {
+        target.scheme = relative3.scheme;
+        target.userinfo = relative3.userinfo;
+        target.host = relative3.host;
+        target.port = relative3.port;
+        target.path = removeDotSegments(relative3.path || "");
+        target.query = relative3.query;
       } else {
-        if (relative2.userinfo !== void 0 || relative2.host !== void 0 || relative2.port !== void 0) {
-          target.userinfo = relative2.userinfo;
-          target.host = relative2.host;
-          target.port = relative2.port;
-          target.path = removeDotSegments(relative2.path || "");
-          target.query = relative2.query;
+        if (relative3.userinfo !== void 0 || relative3.host !== void 0 || relative3.port !== void 0) {
+          target.userinfo = relative3.userinfo;
+          target.host = relative3.host;
+          target.port = relative3.port;
+          target.path = removeDotSegments(relative3.path || "");
+          target.query = relative3.query;
         } else {
-          if (!relative2.path) {
+          if (!relative3.path) {
             target.path = base.path;
-            if (relative2.query !== void 0) {
-              target.query = relative2.query;
+            if (relative3.query !== void 0) {
+              target.query = relative3.query;
             } else {
               target.query = base.query;
             }
           } else {
-            if (relative2.path[0] === "/") {
-              target.path = removeDotSegments(relative2.path);
+            if (relative3.path[0] === "/") {
+              target.path = removeDotSegments(relative3.path);
             } else {
               const baseHasAuthority = base.userinfo !== void 0 || base.host !== void 0 || base.port !== void 0;
               if (baseHasAuthority && !base.path) {
-                target.path = "/" + relative2.path;
+                target.path = "/" + relative3.path;
               } else if (!base.path) {
-                target.path = relative2.path;
+                target.path = relative3.path;
               } else {
-                target.path = base.path.slice(0, base.path.lastIndexOf("/") + 1) + relative2.path;
+                target.path = base.path.slice(0, base.path.lastIndexOf("/") + 1) + relative3.path;
               }
               target.path = base.scheme === void 0 && !baseHasAuthority && target.path[0] !== "/" ? removeDotSegmentsRelative(target.path) : removeDotSegments(target.path);
             }
-            target.query = relative2.query;
+            target.query = relative3.query;
           }
           target.userinfo = base.userinfo;
           target.host = base.host;
@@ -23090,7 +23090,7 @@ var require_fast_uri = __commonJS({
         }
         target.scheme = base.scheme;
       }
-      target.fragment = relative2.fragment;
+      target.fragment = relative3.fragment;
       return target;
     }
     function equal(uriA, uriB, options) {
@@ -23394,7 +23394,7 @@ var require_fast_uri = __commonJS({
     var fastUri = {
       SCHEMES,
       normalize,
-      resolve: resolve4,
+      resolve: resolve5,
       resolveComponent,
       equal,
       serialize: serialize2,
@@ -42964,8 +42964,8 @@ var require_light = __commonJS({
           return this.Promise.resolve();
         }
         yieldLoop(t = 0) {
-          return new this.Promise(function(resolve4, reject) {
-            return setTimeout(resolve4, t);
+          return new this.Promise(function(resolve5, reject) {
+            return setTimeout(resolve5, t);
           });
         }
         computePenalty() {
@@ -43176,15 +43176,15 @@ var require_light = __commonJS({
           return this._queue.length === 0;
         }
         async _tryToRun() {
-          var args, cb, error2, reject, resolve4, returned, task;
+          var args, cb, error2, reject, resolve5, returned, task;
           if (this._running < 1 && this._queue.length > 0) {
             this._running++;
-            ({ task, args, resolve: resolve4, reject } = this._queue.shift());
+            ({ task, args, resolve: resolve5, reject } = this._queue.shift());
             cb = await (async function() {
               try {
                 returned = await task(...args);
                 return function() {
-                  return resolve4(returned);
+                  return resolve5(returned);
                 };
               } catch (error1) {
                 error2 = error1;
@@ -43199,13 +43199,13 @@ var require_light = __commonJS({
           }
         }
         schedule(task, ...args) {
-          var promise, reject, resolve4;
-          resolve4 = reject = null;
+          var promise, reject, resolve5;
+          resolve5 = reject = null;
           promise = new this.Promise(function(_resolve, _reject) {
-            resolve4 = _resolve;
+            resolve5 = _resolve;
             return reject = _reject;
           });
-          this._queue.push({ task, args, resolve: resolve4, reject });
+          this._queue.push({ task, args, resolve: resolve5, reject });
           this._tryToRun();
           return promise;
         }
@@ -43606,14 +43606,14 @@ var require_light = __commonJS({
                 counts = this._states.counts;
                 return counts[0] + counts[1] + counts[2] + counts[3] === at;
               };
-              return new this.Promise((resolve4, reject) => {
+              return new this.Promise((resolve5, reject) => {
                 if (finished()) {
-                  return resolve4();
+                  return resolve5();
                 } else {
                   return this.on("done", () => {
                     if (finished()) {
                       this.removeAllListeners("done");
-                      return resolve4();
+                      return resolve5();
                     }
                   });
                 }
@@ -43706,9 +43706,9 @@ var require_light = __commonJS({
               options = parser$5.load(options, this.jobDefaults);
             }
             task = (...args2) => {
-              return new this.Promise(function(resolve4, reject) {
+              return new this.Promise(function(resolve5, reject) {
                 return fn(...args2, function(...args3) {
-                  return (args3[0] != null ? reject : resolve4)(args3);
+                  return (args3[0] != null ? reject : resolve5)(args3);
                 });
               });
             };
@@ -44010,11 +44010,11 @@ var require_lib = __commonJS({
     })();
     var __awaiter3 = exports && exports.__awaiter || function(thisArg, _arguments, P, generator) {
       function adopt(value) {
-        return value instanceof P ? value : new P(function(resolve4) {
-          resolve4(value);
+        return value instanceof P ? value : new P(function(resolve5) {
+          resolve5(value);
         });
       }
-      return new (P || (P = Promise))(function(resolve4, reject) {
+      return new (P || (P = Promise))(function(resolve5, reject) {
         function fulfilled(value) {
           try {
             step(generator.next(value));
@@ -44030,7 +44030,7 @@ var require_lib = __commonJS({
           }
         }
         function step(result) {
-          result.done ? resolve4(result.value) : adopt(result.value).then(fulfilled, rejected);
+          result.done ? resolve5(result.value) : adopt(result.value).then(fulfilled, rejected);
         }
         step((generator = generator.apply(thisArg, _arguments || [])).next());
       });
@@ -44117,26 +44117,26 @@ var require_lib = __commonJS({
       }
       readBody() {
         return __awaiter3(this, void 0, void 0, function* () {
-          return new Promise((resolve4) => __awaiter3(this, void 0, void 0, function* () {
+          return new Promise((resolve5) => __awaiter3(this, void 0, void 0, function* () {
             let output = Buffer.alloc(0);
             this.message.on("data", (chunk) => {
               output = Buffer.concat([output, chunk]);
             });
             this.message.on("end", () => {
-              resolve4(output.toString());
+              resolve5(output.toString());
             });
           }));
         });
       }
       readBodyBuffer() {
         return __awaiter3(this, void 0, void 0, function* () {
-          return new Promise((resolve4) => __awaiter3(this, void 0, void 0, function* () {
+          return new Promise((resolve5) => __awaiter3(this, void 0, void 0, function* () {
             const chunks = [];
             this.message.on("data", (chunk) => {
               chunks.push(chunk);
             });
             this.message.on("end", () => {
-              resolve4(Buffer.concat(chunks));
+              resolve5(Buffer.concat(chunks));
             });
           }));
         });
@@ -44344,14 +44344,14 @@ var require_lib = __commonJS({
        */
       requestRaw(info2, data) {
         return __awaiter3(this, void 0, void 0, function* () {
-          return new Promise((resolve4, reject) => {
+          return new Promise((resolve5, reject) => {
             function callbackForResult(err2, res) {
               if (err2) {
                 reject(err2);
               } else if (!res) {
                 reject(new Error("Unknown error"));
               } else {
-                resolve4(res);
+                resolve5(res);
               }
             }
             this.requestRawWithCallback(info2, data, callbackForResult);
@@ -44595,12 +44595,12 @@ var require_lib = __commonJS({
         return __awaiter3(this, void 0, void 0, function* () {
           retryNumber = Math.min(ExponentialBackoffCeiling, retryNumber);
           const ms = ExponentialBackoffTimeSlice * Math.pow(2, retryNumber);
-          return new Promise((resolve4) => setTimeout(() => resolve4(), ms));
+          return new Promise((resolve5) => setTimeout(() => resolve5(), ms));
         });
       }
       _processResponse(res, options) {
         return __awaiter3(this, void 0, void 0, function* () {
-          return new Promise((resolve4, reject) => __awaiter3(this, void 0, void 0, function* () {
+          return new Promise((resolve5, reject) => __awaiter3(this, void 0, void 0, function* () {
             const statusCode = res.message.statusCode || 0;
             const response = {
               statusCode,
@@ -44608,7 +44608,7 @@ var require_lib = __commonJS({
               headers: {}
             };
             if (statusCode === HttpCodes2.NotFound) {
-              resolve4(response);
+              resolve5(response);
             }
             function dateTimeDeserializer(key, value) {
               if (typeof value === "string") {
@@ -44647,7 +44647,7 @@ var require_lib = __commonJS({
               err2.result = response.result;
               reject(err2);
             } else {
-              resolve4(response);
+              resolve5(response);
             }
           }));
         });
@@ -44705,11 +44705,11 @@ var init_utils = __esm({
     import_undici2 = __toESM(require_undici(), 1);
     __awaiter2 = function(thisArg, _arguments, P, generator) {
       function adopt(value) {
-        return value instanceof P ? value : new P(function(resolve4) {
-          resolve4(value);
+        return value instanceof P ? value : new P(function(resolve5) {
+          resolve5(value);
         });
       }
-      return new (P || (P = Promise))(function(resolve4, reject) {
+      return new (P || (P = Promise))(function(resolve5, reject) {
         function fulfilled(value) {
           try {
             step(generator.next(value));
@@ -44725,7 +44725,7 @@ var init_utils = __esm({
           }
         }
         function step(result) {
-          result.done ? resolve4(result.value) : adopt(result.value).then(fulfilled, rejected);
+          result.done ? resolve5(result.value) : adopt(result.value).then(fulfilled, rejected);
         }
         step((generator = generator.apply(thisArg, _arguments || [])).next());
       });
@@ -44957,11 +44957,11 @@ import { EOL as EOL3 } from "os";
 import { constants, promises } from "fs";
 var __awaiter = function(thisArg, _arguments, P, generator) {
   function adopt(value) {
-    return value instanceof P ? value : new P(function(resolve4) {
-      resolve4(value);
+    return value instanceof P ? value : new P(function(resolve5) {
+      resolve5(value);
     });
   }
-  return new (P || (P = Promise))(function(resolve4, reject) {
+  return new (P || (P = Promise))(function(resolve5, reject) {
     function fulfilled(value) {
       try {
         step(generator.next(value));
@@ -44977,7 +44977,7 @@ var __awaiter = function(thisArg, _arguments, P, generator) {
       }
     }
     function step(result) {
-      result.done ? resolve4(result.value) : adopt(result.value).then(fulfilled, rejected);
+      result.done ? resolve5(result.value) : adopt(result.value).then(fulfilled, rejected);
     }
     step((generator = generator.apply(thisArg, _arguments || [])).next());
   });
@@ -47404,9 +47404,36 @@ async function gateCheckStep(deps, kind, sha, review, body) {
 // src/action/report-files.ts
 import { mkdir as mkdir2, writeFile as writeFile2 } from "node:fs/promises";
 import { join } from "node:path";
-function reviewJson(review) {
+
+// src/report/json.ts
+function renderJson(review) {
+  assertFinite(review, "");
   return `${JSON.stringify(review, null, 2)}
 `;
+}
+function assertFinite(value, pointer) {
+  if (typeof value === "number") {
+    if (!Number.isFinite(value)) {
+      throw new RangeError(
+        `fitgap-review/1 ${pointer || "/"} is ${String(value)}; the review model must hold finite numbers only (this is a bug)`
+      );
+    }
+    return;
+  }
+  if (Array.isArray(value)) {
+    value.forEach((item, i2) => assertFinite(item, `${pointer}/${i2}`));
+    return;
+  }
+  if (value !== null && typeof value === "object") {
+    for (const [key, item] of Object.entries(value)) {
+      assertFinite(item, `${pointer}/${key.replace(/~/g, "~0").replace(/\//g, "~1")}`);
+    }
+  }
+}
+
+// src/action/report-files.ts
+function reviewJson(review) {
+  return renderJson(review);
 }
 async function writeReportFiles(dir, review, note) {
   await mkdir2(dir, { recursive: true });
@@ -47529,7 +47556,7 @@ async function downloadBundle(deps, run) {
 }
 
 // src/action/review-mode.ts
-import { join as join5 } from "node:path";
+import { basename as basename2, isAbsolute, join as join5, relative as relative2, resolve as resolve4 } from "node:path";
 
 // src/review-files.ts
 import { createHash as createHash2 } from "node:crypto";
@@ -47556,7 +47583,7 @@ function assertCount(name, value) {
     throw new RangeError(`${name} must be a non-negative integer count; got ${value}`);
   }
 }
-function assertFinite(name, value) {
+function assertFinite2(name, value) {
   if (!Number.isFinite(value))
     throw new RangeError(`${name} must be a finite number; got ${value}`);
 }
@@ -47661,7 +47688,7 @@ var RunningStats = class {
   #m2 = 0;
   /** Add one value; RangeError for NaN or ±Infinity (one would poison every later result). */
   push(x2) {
-    assertFinite("RunningStats value", x2);
+    assertFinite2("RunningStats value", x2);
     this.#n += 1;
     const delta2 = x2 - this.#mean;
     this.#mean += delta2 / this.#n;
@@ -47680,7 +47707,7 @@ var RunningStats = class {
 
 // src/stats/t-tests.ts
 function tInference(estimate, se2, df, alpha) {
-  assertFinite("estimate", estimate);
+  assertFinite2("estimate", estimate);
   if (!Number.isFinite(se2)) {
     throw new RangeError(`standard error is not finite (${se2}); values too large to combine`);
   }
@@ -47714,7 +47741,7 @@ function pairedT(diffs, alpha) {
   if (!Number.isSafeInteger(n) || n < 2) {
     throw new RangeError(`pairedT needs at least 2 paired differences; got n = ${n}`);
   }
-  assertFinite("pairedT mean", m);
+  assertFinite2("pairedT mean", m);
   if (!(variance >= 0) || !Number.isFinite(variance)) {
     throw new RangeError(`pairedT variance must be a finite number >= 0; got ${variance}`);
   }
@@ -47740,7 +47767,7 @@ function checkGroup(name, values) {
 // src/stats/proportions.ts
 function normalTest(estimate, variance, alpha, test = "z-binomial") {
   assertAlpha(alpha);
-  assertFinite("normalTest estimate", estimate);
+  assertFinite2("normalTest estimate", estimate);
   if (!(variance >= 0) || !Number.isFinite(variance)) {
     throw new RangeError(`normalTest variance must be a finite number >= 0; got ${variance}`);
   }
@@ -50477,7 +50504,7 @@ async function runReview(deps) {
     ...settings.minEffect === null ? {} : { minEffect: settings.minEffect },
     ...settings.failOn === null ? {} : { failOn: settings.failOn }
   };
-  const { review } = await reviewFiles({
+  const { review, files: inputs } = await reviewFiles({
     baseline,
     candidate: settings.candidate ?? "",
     ...settings.config === null ? {} : { config: settings.config },
@@ -50486,7 +50513,20 @@ async function runReview(deps) {
   });
   const pr = context3.pullRequest;
   const headSha = pr?.headSha ?? context3.sha;
-  const body = renderMarkdown(review, { commentKey: settings.commentKey, headSha });
+  const shown = (path) => {
+    const inside = relative2(settings.workspace, resolve4(settings.workspace, path));
+    if (inside !== "" && !inside.startsWith("..") && !isAbsolute(inside)) return inside;
+    const artifact = settings.baselineArtifact;
+    return artifact === null ? basename2(path) : `artifact ${artifact}: ${basename2(path)}`;
+  };
+  const provenance = {
+    files: [
+      { label: "baseline", ...inputs.baseline, path: shown(inputs.baseline.path) },
+      { label: "candidate", ...inputs.candidate, path: shown(inputs.candidate.path) },
+      ...inputs.config === null ? [] : [{ label: "config", ...inputs.config, path: shown(inputs.config.path) }]
+    ]
+  };
+  const body = renderMarkdown(review, { commentKey: settings.commentKey, headSha, provenance });
   await io.appendSummary(body);
   const files = await writeReportFiles(
     join5(settings.tempDir, `fitgap-${settings.commentKey}`, "report"),

@@ -2,6 +2,7 @@
 import { mkdir, writeFile } from 'node:fs/promises';
 import { join } from 'node:path';
 import type { Review } from '../analysis/types.js';
+import { renderJson } from '../report/json.js';
 import { PULL_REQUEST_FILE, REVIEW_FILE } from './bundle.js';
 import type { PullRequestNote } from './bundle.js';
 
@@ -14,7 +15,7 @@ export interface ReportFiles {
 
 /** The `fitgap-review/1` JSON text. */
 export function reviewJson(review: Review): string {
-  return `${JSON.stringify(review, null, 2)}\n`;
+  return renderJson(review);
 }
 
 export async function writeReportFiles(

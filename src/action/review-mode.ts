@@ -2,7 +2,7 @@
  * Review mode: review the candidate against the baseline, then publish in this order: job summary,
  * JSON report, outputs, comment, gate. The gate is applied even when commenting fails.
  */
-import { join } from 'node:path';
+import { basename, isAbsolute, join, relative, resolve } from 'node:path';
 import { renderMarkdown } from '../report/markdown.js';
 import { reviewFiles } from '../review-files.js';
 import type { SettingsOverrides } from '../review-files.js';
@@ -19,7 +19,7 @@ export async function runReview(deps: PublishDeps): Promise<void> {
     ...(settings.minEffect === null ? {} : { minEffect: settings.minEffect }),
     ...(settings.failOn === null ? {} : { failOn: settings.failOn }),
   };
-  const { review } = await reviewFiles({
+  const { review, files: inputs } = await reviewFiles({
     baseline,
     candidate: settings.candidate ?? '',
     ...(settings.config === null ? {} : { config: settings.config }),
@@ -28,7 +28,24 @@ export async function runReview(deps: PublishDeps): Promise<void> {
   });
   const pr = context.pullRequest;
   const headSha = pr?.headSha ?? context.sha;
-  const body = renderMarkdown(review, { commentKey: settings.commentKey, headSha });
+  // Paths as a reader knows them (workspace-relative, or the artifact's name), so that the same
+  // inputs give the same comment body on every run and an unchanged comment is not edited.
+  const shown = (path: string): string => {
+    const inside = relative(settings.workspace, resolve(settings.workspace, path));
+    if (inside !== '' && !inside.startsWith('..') && !isAbsolute(inside)) return inside;
+    const artifact = settings.baselineArtifact;
+    return artifact === null ? basename(path) : `artifact ${artifact}: ${basename(path)}`;
+  };
+  const provenance = {
+    files: [
+      { label: 'baseline', ...inputs.baseline, path: shown(inputs.baseline.path) },
+      { label: 'candidate', ...inputs.candidate, path: shown(inputs.candidate.path) },
+      ...(inputs.config === null
+        ? []
+        : [{ label: 'config', ...inputs.config, path: shown(inputs.config.path) }]),
+    ],
+  };
+  const body = renderMarkdown(review, { commentKey: settings.commentKey, headSha, provenance });
 
   await io.appendSummary(body);
   const files = await writeReportFiles(
