@@ -21295,6 +21295,10 @@ function formatNumber(value) {
   if (abs >= 1e5 || abs < 1e-3) return value.toExponential(2);
   return Number(value.toPrecision(4)).toString();
 }
+function formatP(p) {
+  if (p === null) return "n/a";
+  return p < 1e-3 ? "< 0.001" : p.toFixed(3);
+}
 
 // src/analysis/gate.ts
 var RULES = {
@@ -21631,10 +21635,6 @@ function chooseLevers(ctx) {
   if (biasy || shrank) nonLevers.push(SMALLER_TRAINING_SET_NOTE);
   return { levers, nonLevers };
 }
-function formatP(p) {
-  if (p === null) return "n/a";
-  return p < 1e-3 ? "< 0.001" : p.toFixed(3);
-}
 
 // src/analysis/movement.ts
 var TABLE = {
@@ -21927,7 +21927,6 @@ function buildReview(input) {
     overfit: { delta: componentChange("overfit") },
     splits,
     baseline: base,
-    slices: sliceResult.slices,
     hyperparameters: changes,
     levers,
     nonLevers,

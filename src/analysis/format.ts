@@ -22,3 +22,9 @@ export function formatNumber(value: number): string {
   if (abs >= 1e5 || abs < 1e-3) return value.toExponential(2);
   return Number(value.toPrecision(4)).toString();
 }
+
+/** A p-value for a sentence: `< 0.001`, three decimals, or `n/a` when noise is unknown. */
+export function formatP(p: number | null): string {
+  if (p === null) return 'n/a';
+  return p < 0.001 ? '< 0.001' : p.toFixed(3);
+}

@@ -10,7 +10,7 @@ import type {
   RegularizationEvidence,
   EpochsEvidence,
 } from './curves/types.js';
-import { formatChange, formatNumber, formatValue } from './format.js';
+import { formatChange, formatNumber, formatP, formatValue } from './format.js';
 import { knobOf, type PulledLever } from './hyperparameters.js';
 import type {
   Delta,
@@ -320,9 +320,4 @@ export function chooseLevers(ctx: LeverContext): { levers: Lever[]; nonLevers: s
   const shrank = ctx.changes.some((c) => c.kind === 'lowered' && knobOf(c.key) === 'data');
   if (biasy || shrank) nonLevers.push(SMALLER_TRAINING_SET_NOTE);
   return { levers, nonLevers };
-}
-
-function formatP(p: number | null): string {
-  if (p === null) return 'n/a';
-  return p < 0.001 ? '< 0.001' : p.toFixed(3);
 }

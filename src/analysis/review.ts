@@ -332,7 +332,6 @@ export function buildReview(input: ReviewInput): Review {
     overfit: { delta: componentChange('overfit') },
     splits,
     baseline: base,
-    slices: sliceResult.slices,
     hyperparameters: changes,
     levers,
     nonLevers,
