@@ -17110,9 +17110,9 @@ var require_jstat = __commonJS({
             var min_iterations = 200;
             if (Math2.abs(ncp) < tol)
               return jStat3.studentt.cdf(x, dof);
-            var flip2 = false;
+            var flip = false;
             if (x < 0) {
-              flip2 = true;
+              flip = true;
               ncp = -ncp;
             }
             var prob = jStat3.normal.cdf(-ncp, 0, 1);
@@ -17132,7 +17132,7 @@ var require_jstat = __commonJS({
               prob += 0.5 * value;
               j++;
             }
-            return flip2 ? 1 - prob : prob;
+            return flip ? 1 - prob : prob;
           }
         });
         jStat3.extend(jStat3.normal, {
@@ -19315,7 +19315,7 @@ var UsageError = class extends Error {
 };
 
 // src/cli/commands.ts
-import { readFile as readFile3, readdir } from "node:fs/promises";
+import { readdir } from "node:fs/promises";
 import { join as join2, resolve as resolve3 } from "node:path";
 
 // src/artifact/load-run.ts
@@ -19846,9 +19846,8 @@ async function loadRun(path, options = {}) {
           ...artifact.curves,
           epochs: parseEpochLog(text, logName, options.epochLog)
         };
-        if (artifact.metric.kind === "proportion") {
-          validateRun(artifact, `${file} (with ${logName})`);
-        }
+        const issues = semanticIssues(artifact, `${file} (with ${logName})`);
+        if (issues.length > 0) throw new InputError(issues);
       }
     } else {
       notes.push(
@@ -21469,6 +21468,11 @@ function chooseLevers(ctx) {
     if (p === void 0) return null;
     return `this PR already ${p.change.kind} ${p.change.key} (${String(p.change.baseline)} \u2192 ${String(p.change.candidate)})`;
   };
+  const lc = learning(curves);
+  const reg = regularization(curves);
+  const ep = epochs(curves);
+  const stopEarlierReason = (e) => `Validation minimum at epoch ${formatNumber(e.bestX)} of ${formatNumber(e.finalX)}; stopping there saves ${formatChange(e.finalValidation - e.bestValidation, kind).replace(/^\+/, "")}${e.gl === null ? "" : ` (generalization loss ${e.gl.toFixed(1)}%)`}.`;
+  const trainLongerReason = (e) => `Train and validation ${ctx.metricName} were both still falling at epoch ${formatNumber(e.finalX)}: train longer.`;
   for (const p of ctx.pulled) {
     const { baseline: from, candidate: to } = p.change;
     if (typeof from !== "number" || typeof to !== "number") continue;
@@ -21499,7 +21503,6 @@ function chooseLevers(ctx) {
         `${p.change.key} rose ${from} \u2192 ${to} and moved the model toward overfitting (\u0394variance ${formatChange(ctx.variance.estimate, kind)}); step back toward ${formatNumber(between)} or keep it and regularize harder.`,
         [`\u0394variance ${formatChange(ctx.variance.estimate, kind)}`]
       );
-      const reg = regularization(curves);
       if (reg !== null && reg.side === "below") {
         add(
           "stronger-regularization",
@@ -21526,9 +21529,6 @@ function chooseLevers(ctx) {
       let score = 60 - t * 20 - i * 2;
       let reason = `The candidate has high ${target}${size}.`;
       const evidence = [];
-      const lc = learning(curves);
-      const reg = regularization(curves);
-      const ep2 = epochs(curves);
       if (id === "more-data" && lc !== null) {
         const twice = lc.projections[0];
         if (twice !== void 0) {
@@ -21554,25 +21554,26 @@ function chooseLevers(ctx) {
           reason = `The regularization sweep has its validation minimum at \u03BB \u2248 ${formatNumber(reg.bestX)}${ctx.lambda === void 0 ? "" : `, the candidate uses ${formatNumber(ctx.lambda)}`}; try ${formatNumber(reg.suggestedX)}.`;
         } else if (reg.side !== "unknown") {
           score -= 20;
-          reason = `${LEVER_CATALOGUE[id].meaning}, but the sweep's validation minimum (\u03BB \u2248 ${formatNumber(reg.bestX)}) is on the other side.`;
+          const meaning = LEVER_CATALOGUE[id].meaning;
+          reason = `${meaning.charAt(0).toUpperCase()}${meaning.slice(1)}, but the sweep's validation minimum (\u03BB \u2248 ${formatNumber(reg.bestX)}) is on the other side.`;
         }
       }
       if (id === "early-stopping") {
-        if (ep2 !== null && ep2.stoppedLate) {
+        if (ep !== null && ep.stoppedLate) {
           score += 12;
-          reason = `Validation minimum at epoch ${formatNumber(ep2.bestX)} of ${formatNumber(ep2.finalX)}; stopping there saves ${formatChange(ep2.finalValidation - ep2.bestValidation, kind).replace(/^\+/, "")} ${ep2.gl === null ? "" : ` (generalization loss ${ep2.gl.toFixed(1)}%)`}.`;
+          reason = stopEarlierReason(ep);
         } else {
           score -= 15;
-          reason = `${reason} ${ep2 === null ? "No epoch curve to confirm it." : "The epoch curve does not show training past the validation minimum."}`;
+          reason = `${reason} ${ep === null ? "No epoch curve to confirm it." : "The epoch curve does not show training past the validation minimum."}`;
         }
       }
       if (id === "train-longer") {
-        if (ep2 !== null && ep2.stoppedEarly) {
+        if (ep !== null && ep.stoppedEarly) {
           score += 12;
-          reason = `Train and validation ${ctx.metricName} were both still falling at epoch ${formatNumber(ep2.finalX)}: train longer.`;
+          reason = trainLongerReason(ep);
         } else {
           score -= 15;
-          reason = `${reason} ${ep2 === null ? "No epoch curve to confirm it." : "The epoch curve does not show both errors still falling at the end."}`;
+          reason = `${reason} ${ep === null ? "No epoch curve to confirm it." : "The epoch curve does not show both errors still falling at the end."}`;
         }
       }
       if (id === "weaker-regularization" && ctx.lambda === void 0 && reg === null) score -= 10;
@@ -21584,20 +21585,11 @@ function chooseLevers(ctx) {
       add(id, score, reason, evidence);
     });
   });
-  const ep = epochs(curves);
   if (ep !== null && ep.stoppedLate && !drafts.has("early-stopping")) {
-    add(
-      "early-stopping",
-      35,
-      `Validation minimum at epoch ${formatNumber(ep.bestX)} of ${formatNumber(ep.finalX)}; stopping there saves ${formatChange(ep.finalValidation - ep.bestValidation, kind).replace(/^\+/, "")}.`
-    );
+    add("early-stopping", 35, stopEarlierReason(ep));
   }
   if (ep !== null && ep.stoppedEarly && !drafts.has("train-longer")) {
-    add(
-      "train-longer",
-      35,
-      `Train and validation ${ctx.metricName} were both still falling at epoch ${formatNumber(ep.finalX)}.`
-    );
+    add("train-longer", 35, trainLongerReason(ep));
   }
   if (ctx.candidate.diagnosis === "data-mismatch" || ctx.candidate.components.mismatch.present) {
     const d = ctx.candidate.components.mismatch.value ?? 0;
@@ -21768,16 +21760,6 @@ function pairedTest(paired, run, alpha) {
 function both(measure) {
   return { baseline: measure, candidate: measure };
 }
-function flip(delta, sign) {
-  if (sign === 1) return delta;
-  const call = delta.call === "up" ? "down" : delta.call === "down" ? "up" : "flat";
-  return {
-    ...delta,
-    estimate: -delta.estimate,
-    ci: delta.ci === null ? null : [-delta.ci[1], -delta.ci[0]],
-    call
-  };
-}
 function buildReview(input) {
   const { baseline, candidate, settings } = input;
   const calls = { alpha: settings.alpha, minEffect: settings.minEffect };
@@ -21790,8 +21772,7 @@ function buildReview(input) {
   for (const split of SPLIT_NAMES) {
     let result = measureChange(baseline, candidate, both(splitMeasure(split)), settings.alpha);
     if (result === null) continue;
-    const usePaired = input.paired !== void 0 && split === pairedSplit && (result.test === "none" || result.test === "z-binomial");
-    if (usePaired && input.paired !== void 0) {
+    if (input.paired !== void 0 && split === pairedSplit && (result.test === "none" || result.test === "z-binomial")) {
       const paired2 = pairedTest(input.paired, candidate, settings.alpha);
       if (paired2 !== null) result = toMetricUnits(paired2, sign);
     }
@@ -21810,19 +21791,18 @@ function buildReview(input) {
       split,
       baseline: b.mean,
       candidate: c.mean,
-      delta: flip(toDelta(result, calls), sign)
+      delta: toDelta(toMetricUnits(result, sign), calls)
     });
   }
   const refB = base.reference;
   const refC = cand.reference;
-  const biasMeasure = (run, ref) => componentMeasures(run, ref ?? 0).bias ?? splitMeasure("train");
-  const useRefs = refB !== null && refC !== null;
+  const [biasRefB, biasRefC] = refB !== null && refC !== null ? [refB, refC] : [0, 0];
   const biasResult = measureChange(
     baseline,
     candidate,
     {
-      baseline: biasMeasure(baseline, useRefs ? refB : 0),
-      candidate: biasMeasure(candidate, useRefs ? refC : 0)
+      baseline: componentMeasures(baseline, biasRefB).bias ?? splitMeasure("train"),
+      candidate: componentMeasures(candidate, biasRefC).bias ?? splitMeasure("train")
     },
     settings.alpha
   );
@@ -21896,7 +21876,10 @@ function buildReview(input) {
   });
   const partial = {
     movement,
-    validation: { change: validationChange, delta: flip(validationDelta, sign) },
+    validation: {
+      change: validationChange,
+      delta: toDelta(toMetricUnits(validationShortfall, sign), calls)
+    },
     slices: sliceResult.slices,
     candidate: cand,
     settings: {
@@ -23631,19 +23614,7 @@ async function validateCommand(argv, io) {
   for (const file of positionals) {
     try {
       if (/\.ya?ml$/i.test(file)) {
-        const text = await readFile3(resolve3(io.cwd, file), "utf8").catch(
-          (error) => {
-            throw new InputError([
-              {
-                file,
-                pointer: "",
-                expected: "could not be read",
-                got: error.code ?? String(error)
-              }
-            ]);
-          }
-        );
-        parseConfig(text, file);
+        await loadConfig(resolve3(io.cwd, file), file, true);
         io.stdout(`${file}: valid config
 `);
       } else {

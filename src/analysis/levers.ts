@@ -136,6 +136,14 @@ export function chooseLevers(ctx: LeverContext): { levers: Lever[]; nonLevers: s
     return `this PR already ${p.change.kind} ${p.change.key} (${String(p.change.baseline)} → ${String(p.change.candidate)})`;
   };
 
+  const lc = learning(curves);
+  const reg = regularization(curves);
+  const ep = epochs(curves);
+  const stopEarlierReason = (e: EpochsEvidence): string =>
+    `Validation minimum at epoch ${formatNumber(e.bestX)} of ${formatNumber(e.finalX)}; stopping there saves ${formatChange(e.finalValidation - e.bestValidation, kind).replace(/^\+/, '')}${e.gl === null ? '' : ` (generalization loss ${e.gl.toFixed(1)}%)`}.`;
+  const trainLongerReason = (e: EpochsEvidence): string =>
+    `Train and validation ${ctx.metricName} were both still falling at epoch ${formatNumber(e.finalX)}: train longer.`;
+
   // 1. The PR's own change overshot: point between old and new.
   for (const p of ctx.pulled) {
     const { baseline: from, candidate: to } = p.change;
@@ -174,7 +182,6 @@ export function chooseLevers(ctx: LeverContext): { levers: Lever[]; nonLevers: s
         `${p.change.key} rose ${from} → ${to} and moved the model toward overfitting (Δvariance ${formatChange(ctx.variance.estimate, kind)}); step back toward ${formatNumber(between)} or keep it and regularize harder.`,
         [`Δvariance ${formatChange(ctx.variance.estimate, kind)}`],
       );
-      const reg = regularization(curves);
       if (reg !== null && reg.side === 'below') {
         add(
           'stronger-regularization',
@@ -206,9 +213,6 @@ export function chooseLevers(ctx: LeverContext): { levers: Lever[]; nonLevers: s
       let score = 60 - t * 20 - i * 2;
       let reason = `The candidate has high ${target}${size}.`;
       const evidence: string[] = [];
-      const lc = learning(curves);
-      const reg = regularization(curves);
-      const ep = epochs(curves);
       if (id === 'more-data' && lc !== null) {
         const twice = lc.projections[0];
         if (twice !== undefined) {
@@ -234,13 +238,14 @@ export function chooseLevers(ctx: LeverContext): { levers: Lever[]; nonLevers: s
           reason = `The regularization sweep has its validation minimum at λ ≈ ${formatNumber(reg.bestX)}${ctx.lambda === undefined ? '' : `, the candidate uses ${formatNumber(ctx.lambda)}`}; try ${formatNumber(reg.suggestedX)}.`;
         } else if (reg.side !== 'unknown') {
           score -= 20;
-          reason = `${LEVER_CATALOGUE[id].meaning}, but the sweep's validation minimum (λ ≈ ${formatNumber(reg.bestX)}) is on the other side.`;
+          const meaning = LEVER_CATALOGUE[id].meaning;
+          reason = `${meaning.charAt(0).toUpperCase()}${meaning.slice(1)}, but the sweep's validation minimum (λ ≈ ${formatNumber(reg.bestX)}) is on the other side.`;
         }
       }
       if (id === 'early-stopping') {
         if (ep !== null && ep.stoppedLate) {
           score += 12;
-          reason = `Validation minimum at epoch ${formatNumber(ep.bestX)} of ${formatNumber(ep.finalX)}; stopping there saves ${formatChange(ep.finalValidation - ep.bestValidation, kind).replace(/^\+/, '')} ${ep.gl === null ? '' : ` (generalization loss ${ep.gl.toFixed(1)}%)`}.`;
+          reason = stopEarlierReason(ep);
         } else {
           score -= 15;
           reason = `${reason} ${ep === null ? 'No epoch curve to confirm it.' : 'The epoch curve does not show training past the validation minimum.'}`;
@@ -249,7 +254,7 @@ export function chooseLevers(ctx: LeverContext): { levers: Lever[]; nonLevers: s
       if (id === 'train-longer') {
         if (ep !== null && ep.stoppedEarly) {
           score += 12;
-          reason = `Train and validation ${ctx.metricName} were both still falling at epoch ${formatNumber(ep.finalX)}: train longer.`;
+          reason = trainLongerReason(ep);
         } else {
           score -= 15;
           reason = `${reason} ${ep === null ? 'No epoch curve to confirm it.' : 'The epoch curve does not show both errors still falling at the end.'}`;
@@ -266,20 +271,11 @@ export function chooseLevers(ctx: LeverContext): { levers: Lever[]; nonLevers: s
   });
 
   // The epoch curve speaks for itself whatever the diagnosis.
-  const ep = epochs(curves);
   if (ep !== null && ep.stoppedLate && !drafts.has('early-stopping')) {
-    add(
-      'early-stopping',
-      35,
-      `Validation minimum at epoch ${formatNumber(ep.bestX)} of ${formatNumber(ep.finalX)}; stopping there saves ${formatChange(ep.finalValidation - ep.bestValidation, kind).replace(/^\+/, '')}.`,
-    );
+    add('early-stopping', 35, stopEarlierReason(ep));
   }
   if (ep !== null && ep.stoppedEarly && !drafts.has('train-longer')) {
-    add(
-      'train-longer',
-      35,
-      `Train and validation ${ctx.metricName} were both still falling at epoch ${formatNumber(ep.finalX)}.`,
-    );
+    add('train-longer', 35, trainLongerReason(ep));
   }
   if (ctx.candidate.diagnosis === 'data-mismatch' || ctx.candidate.components.mismatch.present) {
     const d = ctx.candidate.components.mismatch.value ?? 0;

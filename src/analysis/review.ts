@@ -142,17 +142,6 @@ function both(measure: Measure): { baseline: Measure; candidate: Measure } {
   return { baseline: measure, candidate: measure };
 }
 
-function flip(delta: Delta, sign: 1 | -1): Delta {
-  if (sign === 1) return delta;
-  const call = delta.call === 'up' ? 'down' : delta.call === 'down' ? 'up' : 'flat';
-  return {
-    ...delta,
-    estimate: -delta.estimate,
-    ci: delta.ci === null ? null : [-delta.ci[1], -delta.ci[0]],
-    call,
-  };
-}
-
 export function buildReview(input: ReviewInput): Review {
   const { baseline, candidate, settings } = input;
   const calls: CallSettings = { alpha: settings.alpha, minEffect: settings.minEffect };
@@ -168,11 +157,11 @@ export function buildReview(input: ReviewInput): Review {
   for (const split of SPLIT_NAMES) {
     let result = measureChange(baseline, candidate, both(splitMeasure(split)), settings.alpha);
     if (result === null) continue;
-    const usePaired =
+    if (
       input.paired !== undefined &&
       split === pairedSplit &&
-      (result.test === 'none' || result.test === 'z-binomial');
-    if (usePaired && input.paired !== undefined) {
+      (result.test === 'none' || result.test === 'z-binomial')
+    ) {
       const paired = pairedTest(input.paired, candidate, settings.alpha);
       if (paired !== null) result = toMetricUnits(paired, sign);
     }
@@ -192,22 +181,22 @@ export function buildReview(input: ReviewInput): Review {
       split,
       baseline: b.mean,
       candidate: c.mean,
-      delta: flip(toDelta(result, calls), sign),
+      delta: toDelta(toMetricUnits(result, sign), calls),
     });
   }
 
   // Component changes. Bias change needs no reference when both runs share it (or lack it).
   const refB = base.reference;
   const refC = cand.reference;
-  const biasMeasure = (run: RunArtifact, ref: number | null): Measure =>
-    componentMeasures(run, ref ?? 0).bias ?? splitMeasure('train');
-  const useRefs = refB !== null && refC !== null;
+  // With both references known the bias change includes any change of reference; otherwise
+  // both runs are measured against 0, which leaves Δs(train).
+  const [biasRefB, biasRefC] = refB !== null && refC !== null ? [refB, refC] : [0, 0];
   const biasResult = measureChange(
     baseline,
     candidate,
     {
-      baseline: biasMeasure(baseline, useRefs ? refB : 0),
-      candidate: biasMeasure(candidate, useRefs ? refC : 0),
+      baseline: componentMeasures(baseline, biasRefB).bias ?? splitMeasure('train'),
+      candidate: componentMeasures(candidate, biasRefC).bias ?? splitMeasure('train'),
     },
     settings.alpha,
   );
@@ -294,7 +283,10 @@ export function buildReview(input: ReviewInput): Review {
 
   const partial = {
     movement,
-    validation: { change: validationChange, delta: flip(validationDelta, sign) },
+    validation: {
+      change: validationChange,
+      delta: toDelta(toMetricUnits(validationShortfall, sign), calls),
+    },
     slices: sliceResult.slices,
     candidate: cand,
     settings: {

@@ -10,7 +10,7 @@ import type { EpochLogMapping } from '../config/types.js';
 import { parseEpochLog } from './epoch-log.js';
 import { parseJson } from './read-json.js';
 import type { RunArtifact } from './types.js';
-import { validateRun } from './validate.js';
+import { semanticIssues, validateRun } from './validate.js';
 
 export interface LoadedRun {
   artifact: RunArtifact;
@@ -103,10 +103,9 @@ export async function loadRun(
           ...artifact.curves,
           epochs: parseEpochLog(text, logName, options.epochLog),
         };
-        if (artifact.metric.kind === 'proportion') {
-          // The same range check as the artifact's own curves.
-          validateRun(artifact, `${file} (with ${logName})`);
-        }
+        // The mapped curve meets the same rules as an artifact's own (range, increasing x).
+        const issues = semanticIssues(artifact, `${file} (with ${logName})`);
+        if (issues.length > 0) throw new InputError(issues);
       }
     } else {
       notes.push(

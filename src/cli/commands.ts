@@ -1,8 +1,8 @@
 /** The CLI's commands. Each returns an exit code; user errors are thrown as InputError/UsageError. */
-import { readFile, readdir } from 'node:fs/promises';
+import { readdir } from 'node:fs/promises';
 import { join, resolve } from 'node:path';
 import { loadRun } from '../artifact/load-run.js';
-import { failOnIssues, parseConfig } from '../config/load-config.js';
+import { failOnIssues, loadConfig } from '../config/load-config.js';
 import { EXIT, InputError, UsageError, formatIssue } from '../errors.js';
 import { reviewFiles } from '../review-files.js';
 import { parseFlags, parseFormat, parseOverrides } from './args.js';
@@ -93,19 +93,7 @@ export async function validateCommand(argv: string[], io: CliIo): Promise<number
   for (const file of positionals) {
     try {
       if (/\.ya?ml$/i.test(file)) {
-        const text = await readFile(resolve(io.cwd, file), 'utf8').catch(
-          (error: NodeJS.ErrnoException) => {
-            throw new InputError([
-              {
-                file,
-                pointer: '',
-                expected: 'could not be read',
-                got: error.code ?? String(error),
-              },
-            ]);
-          },
-        );
-        parseConfig(text, file);
+        await loadConfig(resolve(io.cwd, file), file, true);
         io.stdout(`${file}: valid config\n`);
       } else {
         const run = await loadRun(resolve(io.cwd, file), { displayName: file });
