@@ -16,13 +16,22 @@ export interface Metric {
   name: string;
   goal: Goal;
   kind: MetricKind;
+  /** Best possible value (1 for accuracy and R², 100 for a 0–100 score, 0 for an error). */
+  best?: number;
+  /** Unit of the values, for labels. */
+  unit?: string;
 }
+
+/** `fixed`: every repeat was evaluated on the same rows; `per-repeat`: each drew its own rows. */
+export type EvaluationRows = 'fixed' | 'per-repeat';
 
 export interface Split {
   /** Number of examples the value was measured on (needed for binomial noise on one repeat). */
   examples?: number;
   /** One value per repeat (seed); position i is the same trained model in every split. */
   values: number[];
+  /** Default `fixed`. */
+  evaluationRows?: EvaluationRows;
 }
 
 export interface CurvePoint {
@@ -34,7 +43,12 @@ export interface CurvePoint {
 export type CurveName = 'epochs' | 'training_examples' | 'regularization';
 export const CURVE_NAMES: readonly CurveName[] = ['epochs', 'training_examples', 'regularization'];
 
-export type Curves = Partial<Record<CurveName, CurvePoint[]>>;
+/** Where a curve's validation values came from. Default `held-out`. */
+export type CurveSource = 'held-out' | 'cross-validation';
+
+export type Curves = Partial<Record<CurveName, CurvePoint[]>> & {
+  sources?: Partial<Record<CurveName, CurveSource>>;
+};
 
 export interface Slice {
   name: string;
@@ -47,6 +61,10 @@ export interface PredictionsRef {
   split: SplitName;
   /** Relative to the artifact's folder; must stay inside it. */
   path: string;
+  /** How per-example `loss` aggregates to the split value (continuous metrics). Default `mean`. */
+  aggregate?: 'mean' | 'rmse' | 'sum';
+  /** 0-based repeat the predictions belong to. Default 0. */
+  repeat?: number;
 }
 
 export type Hyperparameters = Record<string, unknown>;
