@@ -1,165 +1,140 @@
 /**
- * Streams two predictions CSVs (`id,correct` or `id,loss`) and pairs their rows by id without
- * keeping a row per example: rows in the same order pair on the fly; only rows that arrive out of
- * order wait in a map until their partner shows up. Duplicate ids are found from a typed array of
- * id hashes (one object, not one per row) and confirmed by a second pass that names the lines.
+ * Pairs two predictions CSVs (`id,correct` or `id,loss`) by id without keeping a row per example.
+ * Both files are read side by side, a row of each per step (prediction-lines.ts reads the bytes):
+ * rows with the same id at the same step pair at once, comparing id bytes; only rows out of step
+ * wait, in an open-addressing table keyed on the id bytes, until their partner shows up. A file
+ * whose ids keep increasing cannot repeat one, so it needs no record of its ids; from the first id
+ * out of order a set of 64-bit id hashes (rebuilt from the start of the file) catches repeats, and
+ * a second read of that file confirms them by id and names the lines.
  */
-import { createReadStream } from 'node:fs';
-import { createInterface } from 'node:readline';
+import { open, type FileHandle } from 'node:fs/promises';
 import type { MetricKind } from './types.js';
 import { InputError, quote, type Issue } from '../errors.js';
 import { RunningStats } from '../stats/index.js';
 import type { PairedPredictions } from '../analysis/review.js';
+import {
+  BASE,
+  CAND,
+  HashSet64,
+  IdOrder,
+  WaitingTable,
+  hashId,
+  hashed,
+  sameBytes,
+} from './id-tables.js';
+import {
+  NEED,
+  ROW,
+  PredictionLines,
+  handleReader,
+  iterableReader,
+  type ByteReader,
+  type PredictionsSource,
+} from './prediction-lines.js';
 
-interface Row {
-  id: string;
-  value: number;
-  line: number;
-}
-
-const HEADER: Record<MetricKind, string> = { proportion: 'id,correct', continuous: 'id,loss' };
-
-/** 53-bit FNV-1a style hash of a string, as a double (exact integer). */
-function hashId(id: string): number {
-  let h1 = 0x811c9dc5;
-  let h2 = 0x01000193;
-  for (let i = 0; i < id.length; i++) {
-    const c = id.charCodeAt(i);
-    h1 = Math.imul(h1 ^ c, 0x01000193) >>> 0;
-    h2 = Math.imul(h2 ^ c, 0x5bd1e995) >>> 0;
-  }
-  return (h2 & 0x1fffff) * 0x100000000 + h1;
-}
-
-class HashLog {
-  private data = new Float64Array(1024);
-  private size = 0;
-  push(h: number): void {
-    if (this.size === this.data.length) {
-      const next = new Float64Array(this.data.length * 2);
-      next.set(this.data);
-      this.data = next;
-    }
-    this.data[this.size++] = h;
-  }
-  /** Hashes that occur more than once. */
-  repeated(): Set<number> {
-    const sorted = this.data.slice(0, this.size).sort();
-    const out = new Set<number>();
-    for (let i = 1; i < sorted.length; i++)
-      if (sorted[i] === sorted[i - 1]) out.add(sorted[i] ?? 0);
-    return out;
-  }
-}
-
-function parseValue(raw: string, kind: MetricKind, file: string, line: number): number {
-  const column = kind === 'proportion' ? 'correct' : 'loss';
-  const value = raw.trim() === '' ? Number.NaN : Number(raw);
-  if (kind === 'proportion' ? value !== 0 && value !== 1 : !Number.isFinite(value)) {
-    throw new InputError([
-      {
-        file,
-        pointer: `line ${line}`,
-        expected:
-          kind === 'proportion'
-            ? `column "${column}" must be 1 or 0`
-            : `column "${column}" must be a finite number`,
-        got: quote(raw),
-      },
-    ]);
-  }
-  return value;
-}
-
-async function* readRows(
-  path: string,
-  file: string,
-  kind: MetricKind,
-  hashes?: HashLog,
-): AsyncGenerator<Row> {
-  const stream = createReadStream(path, { encoding: 'utf8' });
-  const lines = createInterface({ input: stream, crlfDelay: Infinity });
-  let line = 0;
-  try {
-    for await (const text of lines) {
-      line++;
-      if (line === 1) {
-        const header = text.replace(/^\uFEFF/, '').trim();
-        if (header !== HEADER[kind]) {
-          throw new InputError([
-            {
-              file,
-              pointer: 'line 1',
-              expected: `must be the header "${HEADER[kind]}" for a ${kind} metric`,
-              got: quote(header),
-            },
-          ]);
-        }
-        continue;
-      }
-      if (text.trim() === '') continue;
-      const comma = text.indexOf(',');
-      if (comma < 0 || text.indexOf(',', comma + 1) >= 0) {
-        throw new InputError([
-          {
-            file,
-            pointer: `line ${line}`,
-            expected: 'must have exactly two fields, id and value',
-            got: quote(text),
-          },
-        ]);
-      }
-      const id = text.slice(0, comma).trim();
-      if (id === '')
-        throw new InputError([
-          { file, pointer: `line ${line}`, expected: 'must have a non-empty id' },
-        ]);
-      hashes?.push(hashId(id));
-      yield { id, value: parseValue(text.slice(comma + 1), kind, file, line), line };
-    }
-  } finally {
-    lines.close();
-    stream.destroy();
-  }
-  if (line === 0) {
-    throw new InputError([
-      {
-        file,
-        pointer: '',
-        expected: `is empty; it needs the header "${HEADER[kind]}" and one row per example`,
-      },
-    ]);
-  }
-}
-
-async function duplicateIssues(
-  path: string,
-  file: string,
-  kind: MetricKind,
-  suspects: Set<number>,
-): Promise<Issue[]> {
-  const firstLine = new Map<string, number>();
-  const issues: Issue[] = [];
-  for await (const row of readRows(path, file, kind)) {
-    if (!suspects.has(hashId(row.id))) continue;
-    const first = firstLine.get(row.id);
-    if (first === undefined) firstLine.set(row.id, row.line);
-    else
-      issues.push({
-        file,
-        pointer: `line ${row.line}`,
-        expected: `must have a unique id (also on line ${first})`,
-        got: quote(row.id),
-      });
-  }
-  return issues;
-}
+export type { PredictionsSource } from './prediction-lines.js';
 
 export interface PredictionsFile {
-  /** Path to open. */
-  path: string;
+  /** Path to open when there is no `source`. */
+  path?: string;
   /** Name shown in messages. */
   file: string;
+  /** The file, already opened by the caller (which then decides what may be read). */
+  source?: PredictionsSource;
+}
+
+type Readers = () => ByteReader;
+
+/** A function giving a fresh reader of the file from its start, each time it is called. */
+function readersOf(f: PredictionsFile, opened: FileHandle[]): Promise<Readers> | Readers {
+  const source = f.source;
+  if (typeof source === 'function') return () => iterableReader(source);
+  if (source !== undefined) return () => handleReader(source);
+  if (f.path === undefined) throw new TypeError(`predictions file ${f.file}: no path or source`);
+  return open(f.path, 'r').then((handle) => {
+    opened.push(handle);
+    return () => handleReader(handle);
+  });
+}
+
+/** Reads more and takes the next row; for after `advance()` returned NEED (once per MiB). */
+async function refill(lines: PredictionLines): Promise<boolean> {
+  let r = NEED;
+  while (r === NEED) {
+    await lines.fill();
+    r = lines.advance();
+  }
+  return r === ROW;
+}
+
+async function row(lines: PredictionLines): Promise<boolean> {
+  const r = lines.advance();
+  return r === NEED ? refill(lines) : r === ROW;
+}
+
+/** Repeated-id bookkeeping of one file. */
+class Repeats {
+  private readonly order = new IdOrder();
+  /** Hashes of every id so far, once the ids stopped increasing. */
+  seen: HashSet64 | null = null;
+  /** Hashes seen twice: the ids to confirm. */
+  readonly suspects = new Set<string>();
+
+  constructor(
+    private readonly readers: Readers,
+    private readonly file: string,
+    private readonly kind: MetricKind,
+  ) {}
+
+  /** False while the ids keep increasing; then every row needs its hash `add`ed. */
+  needsHash(lines: PredictionLines): boolean {
+    return this.seen !== null || !this.order.next(lines.key, lines.keyStart, lines.keyLen);
+  }
+
+  /** At the first id out of order: hashes every earlier id of the file. */
+  async start(rowsBefore: number): Promise<void> {
+    this.seen = new HashSet64();
+    const again = new PredictionLines(this.readers(), this.file, this.kind);
+    try {
+      for (let n = rowsBefore; n > 0 && (await row(again)); n--) {
+        hashId(again.key, again.keyStart, again.keyLen);
+        this.add(hashed.a, hashed.b);
+      }
+    } finally {
+      await again.close();
+    }
+  }
+
+  add(a: number, b: number): void {
+    if (!(this.seen as HashSet64).add(a, b)) this.suspects.add(`${a},${b}`);
+  }
+
+  /** Re-reads the file: a line per repeated id, naming its first line. */
+  async issues(): Promise<Issue[]> {
+    if (this.suspects.size === 0) return [];
+    const firstLine = new Map<string, number>();
+    const issues: Issue[] = [];
+    const lines = new PredictionLines(this.readers(), this.file, this.kind);
+    try {
+      while (await row(lines)) {
+        hashId(lines.key, lines.keyStart, lines.keyLen);
+        if (!this.suspects.has(`${hashed.a},${hashed.b}`)) continue;
+        const id = lines.id();
+        const first = firstLine.get(id);
+        if (first === undefined) firstLine.set(id, lines.line);
+        else
+          issues.push({
+            file: this.file,
+            pointer: `line ${lines.line}`,
+            expected: `must have a unique id (also on line ${first})`,
+            got: quote(id),
+          });
+      }
+    } finally {
+      await lines.close();
+    }
+    return issues;
+  }
 }
 
 /** Pairs baseline and candidate predictions by id, streaming both files. */
@@ -168,66 +143,76 @@ export async function pairPredictions(
   candidate: PredictionsFile,
   kind: MetricKind,
 ): Promise<PairedPredictions & { unmatched: { baseline: number; candidate: number } }> {
-  const baseHashes = new HashLog();
-  const candHashes = new HashLog();
-  const base = readRows(baseline.path, baseline.file, kind, baseHashes);
-  const cand = readRows(candidate.path, candidate.file, kind, candHashes);
-  const waitingBase = new Map<string, number>();
-  const waitingCand = new Map<string, number>();
-  let rows = 0;
-  let baselineOnly = 0;
-  let candidateOnly = 0;
-  const diffs = new RunningStats();
+  const opened: FileHandle[] = [];
+  let a: PredictionLines | null = null;
+  let b: PredictionLines | null = null;
+  try {
+    const baseReaders = await readersOf(baseline, opened);
+    const candReaders = await readersOf(candidate, opened);
+    a = new PredictionLines(baseReaders(), baseline.file, kind);
+    b = new PredictionLines(candReaders(), candidate.file, kind);
+    const baseRepeats = new Repeats(baseReaders, baseline.file, kind);
+    const candRepeats = new Repeats(candReaders, candidate.file, kind);
+    const waiting = new WaitingTable(kind === 'continuous');
+    let rows = 0;
+    let baselineOnly = 0;
+    let candidateOnly = 0;
+    const diffs = new RunningStats();
+    const pair = (x: number, y: number): void => {
+      rows++;
+      if (kind === 'proportion') {
+        if (x === 1 && y === 0) baselineOnly++;
+        else if (x === 0 && y === 1) candidateOnly++;
+      } else diffs.push(y - x);
+    };
 
-  const pair = (b: number, c: number): void => {
-    rows++;
-    if (kind === 'proportion') {
-      if (b === 1 && c === 0) baselineOnly++;
-      else if (b === 0 && c === 1) candidateOnly++;
-    } else diffs.push(c - b);
-  };
-
-  let a = await base.next();
-  let b = await cand.next();
-  while (!a.done || !b.done) {
-    if (!a.done && !b.done && a.value.id === b.value.id) {
-      pair(a.value.value, b.value.value);
-    } else {
-      if (!a.done) {
-        const partner = waitingCand.get(a.value.id);
-        if (partner !== undefined) {
-          waitingCand.delete(a.value.id);
-          pair(a.value.value, partner);
-        } else waitingBase.set(a.value.id, a.value.value);
+    let hasA = await row(a);
+    let hasB = await row(b);
+    while (hasA || hasB) {
+      const together =
+        hasA && hasB && sameBytes(a.key, a.keyStart, a.keyLen, b.key, b.keyStart, b.keyLen);
+      if (together) pair(a.value, b.value);
+      if (hasA) {
+        const needsHash = baseRepeats.needsHash(a);
+        if (needsHash && baseRepeats.seen === null) await baseRepeats.start(a.rows - 1);
+        if (needsHash || !together) hashId(a.key, a.keyStart, a.keyLen);
+        if (needsHash) baseRepeats.add(hashed.a, hashed.b);
+        if (!together && waiting.meet(BASE, a.key, a.keyStart, a.keyLen, hashed.a, a.value))
+          pair(a.value, waiting.partner);
       }
-      if (!b.done) {
-        const partner = waitingBase.get(b.value.id);
-        if (partner !== undefined) {
-          waitingBase.delete(b.value.id);
-          pair(partner, b.value.value);
-        } else waitingCand.set(b.value.id, b.value.value);
+      if (hasB) {
+        const needsHash = candRepeats.needsHash(b);
+        if (needsHash && candRepeats.seen === null) await candRepeats.start(b.rows - 1);
+        if (needsHash || !together) hashId(b.key, b.keyStart, b.keyLen);
+        if (needsHash) candRepeats.add(hashed.a, hashed.b);
+        if (!together && waiting.meet(CAND, b.key, b.keyStart, b.keyLen, hashed.a, b.value))
+          pair(waiting.partner, b.value);
+      }
+      if (hasA) {
+        const r = a.advance();
+        hasA = r === NEED ? await refill(a) : r === ROW;
+      }
+      if (hasB) {
+        const r = b.advance();
+        hasB = r === NEED ? await refill(b) : r === ROW;
       }
     }
-    if (!a.done) a = await base.next();
-    if (!b.done) b = await cand.next();
+
+    const issues = [...(await baseRepeats.issues()), ...(await candRepeats.issues())];
+    if (issues.length > 0) throw new InputError(issues);
+
+    const unmatched = { baseline: waiting.waitingBase, candidate: waiting.waitingCand };
+    if (kind === 'proportion') return { kind, rows, baselineOnly, candidateOnly, unmatched };
+    return {
+      kind,
+      rows,
+      meanDiff: diffs.n > 0 ? diffs.mean : 0,
+      varDiff: diffs.n > 1 ? diffs.variance : 0,
+      unmatched,
+    };
+  } finally {
+    await a?.close();
+    await b?.close();
+    for (const handle of opened) await handle.close();
   }
-
-  const issues: Issue[] = [];
-  const baseRepeated = baseHashes.repeated();
-  if (baseRepeated.size > 0)
-    issues.push(...(await duplicateIssues(baseline.path, baseline.file, kind, baseRepeated)));
-  const candRepeated = candHashes.repeated();
-  if (candRepeated.size > 0)
-    issues.push(...(await duplicateIssues(candidate.path, candidate.file, kind, candRepeated)));
-  if (issues.length > 0) throw new InputError(issues);
-
-  const unmatched = { baseline: waitingBase.size, candidate: waitingCand.size };
-  if (kind === 'proportion') return { kind, rows, baselineOnly, candidateOnly, unmatched };
-  return {
-    kind,
-    rows,
-    meanDiff: diffs.n > 0 ? diffs.mean : 0,
-    varDiff: diffs.n > 1 ? diffs.variance : 0,
-    unmatched,
-  };
 }

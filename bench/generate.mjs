@@ -1,0 +1,216 @@
+// Benchmark data, generated with a fixed seed: `node bench/generate.mjs DIR [1m] [10m]`.
+// Scenario: the late-delivery classifier of the demo, evaluated on a large validation set.
+// Every file is written once per DIR; an existing file of the same name is kept (same seed, same
+// bytes), so a second run of the bench reuses the data.
+import {
+  closeSync,
+  existsSync,
+  mkdirSync,
+  openSync,
+  renameSync,
+  writeFileSync,
+  writeSync,
+} from 'node:fs';
+import { join } from 'node:path';
+
+export const SEED = 20261130;
+
+/** mulberry32: a small, well-known 32-bit PRNG; enough for benchmark data (common practice). */
+function random(seed) {
+  let a = seed >>> 0;
+  return () => {
+    a = (a + 0x6d2b79f5) >>> 0;
+    let t = a;
+    t = Math.imul(t ^ (t >>> 15), t | 1);
+    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
+    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
+  };
+}
+
+const id = (i) => `order-${i}`;
+
+/** Writes `header` and one line per example (in `order`, or 0..n-1) through `line(i)`. */
+function writeCsv(path, header, n, order, line) {
+  if (existsSync(path)) return;
+  const tmp = `${path}.tmp`;
+  const fd = openSync(tmp, 'w');
+  let piece = `${header}\n`;
+  for (let k = 0; k < n; k++) {
+    piece += `${line(order === null ? k : order[k])}\n`;
+    if (piece.length > 1 << 20) {
+      writeSync(fd, piece);
+      piece = '';
+    }
+  }
+  writeSync(fd, piece);
+  closeSync(fd);
+  renameSync(tmp, path);
+}
+
+/** Per-example outcomes of two correlated classifiers (about 9.5 % and 9.0 % wrong) and losses. */
+function outcomes(n, seed) {
+  const next = random(seed);
+  const base = new Uint8Array(n);
+  const cand = new Uint8Array(n);
+  const baseLoss = new Float64Array(n);
+  const candLoss = new Float64Array(n);
+  for (let i = 0; i < n; i++) {
+    const b = next() < 0.905 ? 1 : 0;
+    const c = b === 1 ? (next() < 0.97 ? 1 : 0) : next() < 0.38 ? 1 : 0;
+    base[i] = b;
+    cand[i] = c;
+    // Cross-entropy of the predicted probability of the true class.
+    baseLoss[i] = -Math.log(b === 1 ? 0.5 + 0.5 * next() : 0.5 * next() + 1e-9);
+    candLoss[i] = -Math.log(c === 1 ? 0.52 + 0.48 * next() : 0.5 * next() + 1e-9);
+  }
+  return { base, cand, baseLoss, candLoss };
+}
+
+function shuffled(n, seed) {
+  const next = random(seed);
+  const order = new Int32Array(n);
+  for (let i = 0; i < n; i++) order[i] = i;
+  for (let i = n - 1; i > 0; i--) {
+    const j = Math.floor(next() * (i + 1));
+    const t = order[i];
+    order[i] = order[j];
+    order[j] = t;
+  }
+  return order;
+}
+
+function artifact(name, kind, csv, extra = {}) {
+  const proportion = kind === 'proportion';
+  return {
+    format: 'fitgap-run/1',
+    run: { name, commit: 'b3e51a0', createdAt: '2026-11-30T10:00:00Z' },
+    metric: proportion
+      ? { name: 'late_delivery_error', goal: 'minimize', kind }
+      : { name: 'log_loss', goal: 'minimize', kind },
+    reference: proportion ? 0.02 : 0.05,
+    splits: {
+      train: { examples: 4000000, values: proportion ? [0.061, 0.06, 0.062] : [0.2, 0.21, 0.2] },
+      train_dev: {
+        examples: 200000,
+        values: proportion ? [0.07, 0.069, 0.071] : [0.23, 0.22, 0.23],
+      },
+      validation: {
+        examples: 1000000,
+        values: proportion ? [0.095, 0.094, 0.096] : [0.3, 0.3, 0.31],
+      },
+    },
+    hyperparameters: { lambda: 0.01, features: 48, epochs: 40 },
+    ...(csv === null ? {} : { predictions: { split: 'validation', path: csv } }),
+    ...extra,
+  };
+}
+
+function writeJson(path, value) {
+  if (!existsSync(path)) writeFileSync(path, `${JSON.stringify(value)}\n`);
+}
+
+/** An epoch curve of n points: falls, then validation turns up a little after the middle. */
+function epochCurve(n, seed) {
+  const next = random(seed);
+  const points = new Array(n);
+  for (let i = 0; i < n; i++) {
+    const e = i + 1;
+    const fall = 0.4 * Math.exp(-e / (n / 8));
+    const noise = (next() - 0.5) * 0.002;
+    points[i] = {
+      x: e,
+      train: 0.05 + fall + noise,
+      validation: 0.09 + fall + (e > n / 2 ? (0.03 * (e - n / 2)) / n : 0) + noise,
+    };
+  }
+  return points;
+}
+
+export function generate(dir, sizes) {
+  mkdirSync(dir, { recursive: true });
+  writeJson(join(dir, 'tiny-baseline.json'), artifact('eta-baseline', 'proportion', null));
+  writeJson(join(dir, 'tiny-candidate.json'), artifact('eta-dropout', 'proportion', null));
+  for (const size of sizes) {
+    const n = size === '10m' ? 10_000_000 : 1_000_000;
+    const files = [
+      `base-${size}.csv`,
+      `cand-${size}.csv`,
+      `cand-${size}-shuffled.csv`,
+      ...(size === '1m' ? [`base-${size}-loss.csv`, `cand-${size}-loss.csv`] : []),
+    ];
+    if (files.some((f) => !existsSync(join(dir, f)))) {
+      const o = outcomes(n, SEED + n);
+      writeCsv(
+        join(dir, `base-${size}.csv`),
+        'id,correct',
+        n,
+        null,
+        (i) => `${id(i)},${o.base[i]}`,
+      );
+      writeCsv(
+        join(dir, `cand-${size}.csv`),
+        'id,correct',
+        n,
+        null,
+        (i) => `${id(i)},${o.cand[i]}`,
+      );
+      writeCsv(
+        join(dir, `cand-${size}-shuffled.csv`),
+        'id,correct',
+        n,
+        shuffled(n, SEED + 1),
+        (i) => `${id(i)},${o.cand[i]}`,
+      );
+      if (size === '1m') {
+        writeCsv(
+          join(dir, `base-${size}-loss.csv`),
+          'id,loss',
+          n,
+          null,
+          (i) => `${id(i)},${o.baseLoss[i]}`,
+        );
+        writeCsv(
+          join(dir, `cand-${size}-loss.csv`),
+          'id,loss',
+          n,
+          null,
+          (i) => `${id(i)},${o.candLoss[i]}`,
+        );
+      }
+    }
+    writeJson(
+      join(dir, `baseline-${size}.json`),
+      artifact('eta-baseline', 'proportion', `base-${size}.csv`),
+    );
+    writeJson(
+      join(dir, `candidate-${size}.json`),
+      artifact('eta-dropout', 'proportion', `cand-${size}.csv`),
+    );
+    writeJson(
+      join(dir, `candidate-${size}-shuffled.json`),
+      artifact('eta-dropout', 'proportion', `cand-${size}-shuffled.csv`),
+    );
+    if (size === '1m') {
+      writeJson(
+        join(dir, 'baseline-1m-loss.json'),
+        artifact('eta-baseline', 'continuous', 'base-1m-loss.csv'),
+      );
+      writeJson(
+        join(dir, 'candidate-1m-loss.json'),
+        artifact('eta-dropout', 'continuous', 'cand-1m-loss.csv'),
+      );
+      writeJson(
+        join(dir, 'candidate-curve-1m.json'),
+        artifact('eta-dropout', 'proportion', null, {
+          curves: { epochs: epochCurve(1_000_000, SEED + 2) },
+        }),
+      );
+    }
+  }
+}
+
+if (import.meta.url === `file://${process.argv[1]}`) {
+  const [dir, ...sizes] = process.argv.slice(2);
+  if (dir === undefined) throw new Error('usage: node bench/generate.mjs DIR [1m] [10m]');
+  generate(dir, sizes.length > 0 ? sizes : ['1m']);
+}

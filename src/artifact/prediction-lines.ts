@@ -1,0 +1,362 @@
+/**
+ * Byte-level reader of one predictions CSV (`id,correct` or `id,loss`), one row at a time, with no
+ * string, object or `await` per row: 1 MiB reads into one buffer, ids left in place as bytes.
+ *
+ * Why hand-written (the only hand-written parser in fitgap): the file has two columns and millions
+ * of rows; a general CSV or line reader builds a string and an object per row, which measured as
+ * most of a paired review's time. The rules are still the string rules of the original reader —
+ * lines as Node's readline splits them (`\n`, `\r\n`, or a lone `\r`), the header after an optional
+ * BOM, blank lines skipped, fields trimmed, `Number()` for values — and only lines that need
+ * nothing of them take the byte path: `ID,VALUE\n` with ID printable ASCII without a comma and
+ * VALUE `0`/`1` (correct) or a plain decimal (loss). Any other line (CR, BOM, quotes, spaces,
+ * UTF-8, odd numbers, errors) is decoded and read by the string rules, with the same messages.
+ *
+ * A row's id is exposed as `key[keyStart, keyStart + keyLen)`: the UTF-8 bytes of the id string the
+ * string rules would give, so that equal bytes mean equal ids on both paths.
+ */
+import type { FileHandle } from 'node:fs/promises';
+import type { MetricKind } from './types.js';
+import { InputError, quote } from '../errors.js';
+
+export const CHUNK = 1 << 20;
+/** `advance()` results. */
+export const ROW = 1;
+export const END = 0;
+export const NEED = -1;
+/** Internal: a segment went to the string path; look again. */
+const AGAIN = 2;
+
+/** Bytes of one file, from the start; `read` returns 0 at the end. */
+export interface ByteReader {
+  read(into: Uint8Array, offset: number, length: number): Promise<number>;
+  close(): Promise<void>;
+}
+
+/**
+ * Where the bytes of a predictions file come from. The caller opens the file (and so decides what
+ * may be opened: path, file type, size); the reader only reads it. A file handle is read with
+ * explicit positions; a function returns a fresh stream of the whole file on every call. Both can
+ * be read more than once (the duplicate-id check re-reads a file that has a repeated id).
+ */
+export type PredictionsSource = FileHandle | (() => AsyncIterable<Uint8Array>);
+
+export function handleReader(handle: FileHandle): ByteReader {
+  let position = 0;
+  return {
+    async read(into, offset, length) {
+      const { bytesRead } = await handle.read(into, offset, length, position);
+      position += bytesRead;
+      return bytesRead;
+    },
+    async close() {},
+  };
+}
+
+export function iterableReader(make: () => AsyncIterable<Uint8Array>): ByteReader {
+  const iterator = make()[Symbol.asyncIterator]();
+  let chunk: Uint8Array | null = null;
+  let at = 0;
+  return {
+    async read(into, offset, length) {
+      while (chunk === null || at >= chunk.length) {
+        const next = await iterator.next();
+        if (next.done === true) return 0;
+        chunk = next.value;
+        at = 0;
+      }
+      const n = Math.min(length, chunk.length - at);
+      into.set(chunk.subarray(at, at + n), offset);
+      at += n;
+      return n;
+    },
+    async close() {
+      await iterator.return?.();
+    },
+  };
+}
+
+const HEADER: Record<MetricKind, string> = { proportion: 'id,correct', continuous: 'id,loss' };
+const TWO_53 = 9007199254740992;
+/** Exact powers of ten (10^0 … 10^22 are exact doubles). */
+const POW10 = Array.from({ length: 23 }, (_, i) => Number(`1e${i}`));
+
+function valueError(kind: MetricKind, file: string, line: number, raw: string): InputError {
+  const column = kind === 'proportion' ? 'correct' : 'loss';
+  return new InputError([
+    {
+      file,
+      pointer: `line ${line}`,
+      expected:
+        kind === 'proportion'
+          ? `column "${column}" must be 1 or 0`
+          : `column "${column}" must be a finite number`,
+      got: quote(raw),
+    },
+  ]);
+}
+
+/** The value rule of the string path: `Number()` of the field; 1/0 or a finite number. */
+function parseValue(raw: string, kind: MetricKind, file: string, line: number): number {
+  const value = raw.trim() === '' ? Number.NaN : Number(raw);
+  if (kind === 'proportion' ? value !== 0 && value !== 1 : !Number.isFinite(value))
+    throw valueError(kind, file, line, raw);
+  return value;
+}
+
+export class PredictionLines {
+  /** 1-based number of the last line read (readline's count: header and blank lines included). */
+  line = 0;
+  /** Data rows read. */
+  rows = 0;
+  /** The current row (after `advance()` returned ROW). */
+  key: Buffer;
+  keyStart = 0;
+  keyLen = 0;
+  value = 0;
+
+  private buf: Buffer = Buffer.allocUnsafe(CHUNK);
+  private pos = 0;
+  private end = 0;
+  private eof = false;
+  private pending: string[] | null = null;
+  private pendingAt = 0;
+  private scratch: Buffer = Buffer.allocUnsafe(256);
+  private readonly proportion: boolean;
+
+  constructor(
+    private readonly reader: ByteReader,
+    readonly file: string,
+    readonly kind: MetricKind,
+  ) {
+    this.key = this.buf;
+    this.proportion = kind === 'proportion';
+  }
+
+  /** Reads more bytes after `advance()` returned NEED (keeps the unread part of the buffer). */
+  async fill(): Promise<void> {
+    const rest = this.end - this.pos;
+    if (rest === this.buf.length) {
+      // A line longer than the buffer: grow it.
+      const bigger = Buffer.allocUnsafe(this.buf.length * 2);
+      this.buf.copy(bigger, 0, this.pos, this.end);
+      this.buf = bigger;
+    } else if (this.pos > 0) this.buf.copyWithin(0, this.pos, this.end);
+    this.pos = 0;
+    this.end = rest;
+    const n = await this.reader.read(this.buf, rest, this.buf.length - rest);
+    if (n === 0) this.eof = true;
+    else this.end += n;
+  }
+
+  /** Next data row: ROW (fields set), END, or NEED (call `fill()` and try again). */
+  advance(): number {
+    for (;;) {
+      if (this.pending !== null && this.fromPending()) return ROW;
+      const result = this.scan();
+      if (result !== AGAIN) return result;
+    }
+  }
+
+  private scan(): number {
+    const buf = this.buf;
+    const end = this.end;
+    let p = this.pos;
+    for (;;) {
+      if (p >= end) {
+        this.pos = p;
+        if (!this.eof) return NEED;
+        if (this.line === 0) {
+          throw new InputError([
+            {
+              file: this.file,
+              pointer: '',
+              expected: `is empty; it needs the header "${HEADER[this.kind]}" and one row per example`,
+            },
+          ]);
+        }
+        return END;
+      }
+      const start = p;
+      let c = buf[p] as number;
+      if (this.line === 0) return this.slow(start);
+      if (c === 10) {
+        this.line++;
+        p++;
+        continue;
+      }
+      // The id: printable ASCII up to the comma.
+      while (c > 32 && c < 127 && c !== 44) {
+        if (++p >= end) return this.slow(start);
+        c = buf[p] as number;
+      }
+      if (c !== 44 || p === start) return this.slow(start);
+      const idEnd = p;
+      p++;
+      if (this.proportion) {
+        if (p + 1 >= end) return this.slow(start);
+        const v = buf[p] as number;
+        if ((v !== 48 && v !== 49) || buf[p + 1] !== 10) return this.slow(start);
+        this.value = v - 48;
+        p += 2;
+      } else {
+        const after = this.number(p);
+        if (after < 0) return this.slow(start);
+        p = after;
+      }
+      this.key = buf;
+      this.keyStart = start;
+      this.keyLen = idEnd - start;
+      this.line++;
+      this.rows++;
+      this.pos = p;
+      return ROW;
+    }
+  }
+
+  /**
+   * Reads a plain decimal (`-?D+(.D+)?([eE][+-]?D+)?`) followed by `\n` from `p`; sets `value` and
+   * returns the index after the newline, or −1 for anything else (the line takes the string path).
+   * Exact: up to 16 digits below 2^53 with |exponent| ≤ 22 is one correctly rounded operation on
+   * two exact doubles (Clinger 1990, "How to read floating point numbers accurately", PLDI); other
+   * plain decimals go through `Number()` of the same characters.
+   */
+  private number(from: number): number {
+    const buf = this.buf;
+    const end = this.end;
+    let p = from;
+    let c = p < end ? (buf[p] as number) : -1;
+    const negative = c === 45;
+    if (negative) c = ++p < end ? (buf[p] as number) : -1;
+    let m = 0;
+    let digits = 0;
+    let intDigits = 0;
+    while (c >= 48 && c <= 57) {
+      m = m * 10 + (c - 48);
+      if (m !== 0) digits++;
+      intDigits++;
+      c = ++p < end ? (buf[p] as number) : -1;
+    }
+    if (intDigits === 0) return -1;
+    let scale = 0;
+    if (c === 46) {
+      c = ++p < end ? (buf[p] as number) : -1;
+      let fraction = 0;
+      while (c >= 48 && c <= 57) {
+        m = m * 10 + (c - 48);
+        if (m !== 0) digits++;
+        fraction++;
+        c = ++p < end ? (buf[p] as number) : -1;
+      }
+      if (fraction === 0) return -1;
+      scale = -fraction;
+    }
+    if (c === 101 || c === 69) {
+      c = ++p < end ? (buf[p] as number) : -1;
+      let sign = 1;
+      if (c === 43 || c === 45) {
+        if (c === 45) sign = -1;
+        c = ++p < end ? (buf[p] as number) : -1;
+      }
+      let e = 0;
+      let eDigits = 0;
+      while (c >= 48 && c <= 57) {
+        if (e < 100000) e = e * 10 + (c - 48);
+        eDigits++;
+        c = ++p < end ? (buf[p] as number) : -1;
+      }
+      if (eDigits === 0) return -1;
+      scale += sign * e;
+    }
+    if (c !== 10) return -1;
+    let value: number;
+    if (digits <= 16 && m < TWO_53 && scale >= -22 && scale <= 22) {
+      value = scale < 0 ? m / (POW10[-scale] as number) : m * (POW10[scale] as number);
+      if (negative) value = -value;
+    } else {
+      value = Number(buf.toString('latin1', from, p));
+      if (!Number.isFinite(value)) return -1;
+    }
+    this.value = value;
+    return p + 1;
+  }
+
+  /** The string path for the line(s) of the segment from `start` to the next `\n`. */
+  private slow(start: number): number {
+    const end = this.end;
+    let nl = start < end ? this.buf.indexOf(10, start) : -1;
+    if (nl >= end) nl = -1;
+    if (nl < 0 && !this.eof) {
+      this.pos = start;
+      return NEED;
+    }
+    const stop = nl < 0 ? end : nl;
+    this.pos = nl < 0 ? end : nl + 1;
+    // readline: `\r\n` ends one line; a lone `\r` ends a line too.
+    const text = this.buf.toString('utf8', start, stop);
+    const lines = text.split('\r');
+    if (text.endsWith('\r')) lines.pop();
+    this.pending = lines;
+    this.pendingAt = 0;
+    return AGAIN;
+  }
+
+  /** Reads pending string lines until one is a data row (true) or none are left (false). */
+  private fromPending(): boolean {
+    const lines = this.pending as string[];
+    while (this.pendingAt < lines.length) {
+      const text = lines[this.pendingAt++] as string;
+      this.line++;
+      if (this.line === 1) {
+        const header = text.replace(/^\uFEFF/, '').trim();
+        if (header !== HEADER[this.kind]) {
+          throw new InputError([
+            {
+              file: this.file,
+              pointer: 'line 1',
+              expected: `must be the header "${HEADER[this.kind]}" for a ${this.kind} metric`,
+              got: quote(header),
+            },
+          ]);
+        }
+        continue;
+      }
+      if (text.trim() === '') continue;
+      const comma = text.indexOf(',');
+      if (comma < 0 || text.indexOf(',', comma + 1) >= 0) {
+        throw new InputError([
+          {
+            file: this.file,
+            pointer: `line ${this.line}`,
+            expected: 'must have exactly two fields, id and value',
+            got: quote(text),
+          },
+        ]);
+      }
+      const id = text.slice(0, comma).trim();
+      if (id === '')
+        throw new InputError([
+          { file: this.file, pointer: `line ${this.line}`, expected: 'must have a non-empty id' },
+        ]);
+      this.value = parseValue(text.slice(comma + 1), this.kind, this.file, this.line);
+      const length = Buffer.byteLength(id, 'utf8');
+      if (length > this.scratch.length) this.scratch = Buffer.allocUnsafe(length * 2);
+      this.scratch.write(id, 0, 'utf8');
+      this.key = this.scratch;
+      this.keyStart = 0;
+      this.keyLen = length;
+      this.rows++;
+      return true;
+    }
+    this.pending = null;
+    return false;
+  }
+
+  /** The current row's id as a string (for messages). */
+  id(): string {
+    return this.key.toString('utf8', this.keyStart, this.keyStart + this.keyLen);
+  }
+
+  async close(): Promise<void> {
+    await this.reader.close();
+  }
+}

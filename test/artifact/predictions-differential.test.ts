@@ -1,0 +1,275 @@
+/**
+ * The byte-level predictions reader against the original string reader (predictions-reference.ts):
+ * on generated CSVs — empty files, header only, BOM, CRLF and lone CR, blank and padded lines,
+ * quotes, UTF-8 and broken UTF-8, duplicates, shuffled and partly overlapping ids, bad and unusual
+ * values — both give the same result, bit for bit, or the same error with the same issues.
+ */
+import { mkdtempSync, writeFileSync } from 'node:fs';
+import { open } from 'node:fs/promises';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import fc from 'fast-check';
+import { describe, expect, it } from 'vitest';
+import { pairPredictions, type PredictionsFile } from '../../src/artifact/predictions.js';
+import type { MetricKind } from '../../src/artifact/types.js';
+import { referencePairPredictions } from './predictions-reference.js';
+
+const dir = mkdtempSync(join(tmpdir(), 'fitgap-pred-diff-'));
+let counter = 0;
+function write(bytes: Uint8Array): { path: string; file: string } {
+  const file = `d${counter++}.csv`;
+  writeFileSync(join(dir, file), bytes);
+  return { path: join(dir, file), file };
+}
+
+/** Numbers as their exact shortest text, -0 kept apart from 0. */
+function canonical(value: unknown): string {
+  return JSON.stringify(value, (_, v: unknown) =>
+    typeof v === 'number' ? (Object.is(v, -0) ? '-0' : String(v)) : v,
+  );
+}
+
+async function outcome(run: () => Promise<unknown>): Promise<string> {
+  try {
+    return `ok ${canonical(await run())}`;
+  } catch (error) {
+    const e = error as Error & { issues?: unknown };
+    return `${e.name}: ${e.message} ${canonical(e.issues)}`;
+  }
+}
+
+const utf8 = (text: string): Uint8Array => Buffer.from(text, 'utf8');
+const bytes = (...values: number[]): Uint8Array => Uint8Array.from(values);
+
+const id = fc.oneof(
+  { weight: 8, arbitrary: fc.integer({ min: 0, max: 30 }).map((i) => utf8(`ex-${i}`)) },
+  { weight: 2, arbitrary: fc.stringMatching(/^[a-z0-9]{1,3}$/).map(utf8) },
+  {
+    weight: 2,
+    arbitrary: fc
+      .constantFrom(
+        ' ex-1',
+        'ex-1 ',
+        '"ex-1"',
+        'café',
+        'cafe\u0301',
+        '\uFEFFex-2',
+        '\tex-3',
+        '',
+        ' ',
+        'a"b',
+        'ex-1\u00a0',
+        '\u2028ex-4',
+        'x\u0000y',
+      )
+      .map(utf8),
+  },
+  {
+    weight: 1,
+    arbitrary: fc.constantFrom(bytes(0xff), bytes(0xfe), bytes(0xc3), bytes(0xe2, 0x82)),
+  },
+);
+
+const correctValue = fc.oneof(
+  { weight: 10, arbitrary: fc.constantFrom('0', '1') },
+  {
+    weight: 2,
+    arbitrary: fc.constantFrom(
+      '1.0',
+      ' 1',
+      '0 ',
+      '-0',
+      '0x1',
+      '1e0',
+      '+1',
+      '2',
+      '',
+      'x',
+      '1,0',
+      'true',
+    ),
+  },
+);
+const lossValue = fc.oneof(
+  { weight: 6, arbitrary: fc.double({ noNaN: true, noDefaultInfinity: true }).map(String) },
+  { weight: 3, arbitrary: fc.double({ min: -10, max: 10, noNaN: true }).map((x) => x.toFixed(6)) },
+  {
+    weight: 3,
+    arbitrary: fc
+      .tuple(
+        fc.boolean(),
+        fc.stringMatching(/^[0-9]{1,20}$/),
+        fc.option(fc.stringMatching(/^[0-9]{1,20}$/)),
+        fc.option(
+          fc.tuple(fc.constantFrom('e', 'E', 'e+', 'e-', 'E-'), fc.integer({ min: 0, max: 400 })),
+        ),
+      )
+      .map(
+        ([neg, int, frac, exp]) =>
+          `${neg ? '-' : ''}${int}${frac === null ? '' : `.${frac}`}${exp === null ? '' : `${exp[0]}${exp[1]}`}`,
+      ),
+  },
+  {
+    weight: 2,
+    arbitrary: fc.constantFrom(
+      '1e999',
+      '-1e999',
+      'NaN',
+      'Infinity',
+      '',
+      ' 2.5',
+      '.5',
+      '5.',
+      '0x10',
+      '1_0',
+      '0.1e',
+      '-',
+      '1e-400',
+      '9007199254740993',
+      '12345678901234567',
+      '0.30000000000000004',
+      '1e22',
+      '1e23',
+      '123456789012345678e-10',
+      '-0.0',
+    ),
+  },
+);
+
+const eol = fc.oneof(
+  { weight: 12, arbitrary: fc.constant('\n') },
+  { weight: 1, arbitrary: fc.constantFrom('\r\n', '\r', '\n\n', '\n \n', '\r\r\n') },
+);
+
+function csv(kind: MetricKind) {
+  const header = fc.oneof(
+    { weight: 12, arbitrary: fc.constant(kind === 'proportion' ? 'id,correct' : 'id,loss') },
+    {
+      weight: 1,
+      arbitrary: fc.constantFrom(
+        '\uFEFFid,correct',
+        '\uFEFFid,loss',
+        ' id,correct ',
+        'id,loss',
+        'id,correct',
+        'id;correct',
+        '',
+      ),
+    },
+  );
+  const line = fc.tuple(id, kind === 'proportion' ? correctValue : lossValue, eol);
+  return fc
+    .tuple(
+      fc.oneof(
+        { weight: 20, arbitrary: header.map((h) => ({ empty: false, h })) },
+        { weight: 1, arbitrary: fc.constant({ empty: true, h: '' }) },
+      ),
+      eol,
+      fc.array(line, { maxLength: 25 }),
+      fc.boolean(),
+      fc.boolean(),
+    )
+    .map(([head, headEol, lines, sorted, trailing]) => {
+      if (head.empty) return new Uint8Array(0);
+      const rows = sorted ? [...lines].sort((x, y) => Buffer.compare(x[0], y[0])) : lines;
+      const parts: Uint8Array[] = [utf8(head.h), utf8(headEol)];
+      rows.forEach(([i, v, e], k) => {
+        parts.push(i, utf8(`,${v}`));
+        if (trailing || k < rows.length - 1) parts.push(utf8(e));
+      });
+      return Buffer.concat(parts);
+    });
+}
+
+/** Splits bytes into chunks of the given sizes (cycled), as an async iterable factory. */
+function chunked(data: Uint8Array, sizes: number[]): () => AsyncIterable<Uint8Array> {
+  return async function* () {
+    let at = 0;
+    let k = 0;
+    while (at < data.length) {
+      const n = Math.max(1, sizes[k++ % sizes.length] ?? 1);
+      yield data.subarray(at, at + n);
+      at += n;
+    }
+  };
+}
+
+describe('byte-level predictions reader = string reader', () => {
+  for (const kind of ['proportion', 'continuous'] as const) {
+    it(`gives the same result or error for generated ${kind} files (property)`, async () => {
+      await fc.assert(
+        fc.asyncProperty(
+          csv(kind),
+          csv(kind),
+          fc.constantFrom('path', 'handle', 'chunks'),
+          fc.array(fc.integer({ min: 1, max: 9 }), { minLength: 1, maxLength: 5 }),
+          async (baseBytes, candBytes, how, sizes) => {
+            const b = write(baseBytes);
+            const c = write(candBytes);
+            const expected = await outcome(() => referencePairPredictions(b, c, kind));
+            const handles = how === 'handle' ? [await open(b.path), await open(c.path)] : [];
+            try {
+              const as = (
+                f: { path: string; file: string },
+                data: Uint8Array,
+                i: number,
+              ): PredictionsFile =>
+                how === 'path'
+                  ? f
+                  : how === 'handle'
+                    ? { file: f.file, source: handles[i] as NonNullable<PredictionsFile['source']> }
+                    : { file: f.file, source: chunked(data, sizes) };
+              const actual = await outcome(() =>
+                pairPredictions(as(b, baseBytes, 0), as(c, candBytes, 1), kind),
+              );
+              expect(actual).toBe(expected);
+            } finally {
+              for (const h of handles) await h.close();
+            }
+          },
+        ),
+        { numRuns: 400 },
+      );
+    }, 120_000);
+  }
+
+  it('agrees on shuffled, partly overlapping and repeated ids with many rows (property)', async () => {
+    await fc.assert(
+      fc.asyncProperty(
+        fc.array(fc.integer({ min: 0, max: 400 }), { minLength: 0, maxLength: 300 }),
+        fc.array(fc.integer({ min: 0, max: 400 }), { minLength: 0, maxLength: 300 }),
+        fc.boolean(),
+        fc.boolean(),
+        fc.constantFrom('proportion', 'continuous') as fc.Arbitrary<MetricKind>,
+        async (xs, ys, unique, sortBase, kind) => {
+          const prep = (list: number[]): number[] => {
+            const l = unique ? [...new Set(list)] : list;
+            return sortBase ? [...l].sort((p, q) => p - q) : l;
+          };
+          const v = (i: number, salt: number): string =>
+            kind === 'proportion'
+              ? String((i * 7 + salt) % 3 === 0 ? 0 : 1)
+              : String(((i * 37 + salt) % 101) / 7);
+          const text = (list: number[], salt: number): Uint8Array =>
+            utf8(
+              `${kind === 'proportion' ? 'id,correct' : 'id,loss'}\n${list.map((i) => `id-${i},${v(i, salt)}\n`).join('')}`,
+            );
+          const b = write(text(prep(xs), 1));
+          const c = write(text(unique ? ys : ys, 2));
+          const expected = await outcome(() => referencePairPredictions(b, c, kind));
+          expect(await outcome(() => pairPredictions(b, c, kind))).toBe(expected);
+        },
+      ),
+      { numRuns: 300 },
+    );
+  }, 120_000);
+
+  it('agrees on a line longer than the read buffer', async () => {
+    const long = 'x'.repeat(3 << 20);
+    const b = write(utf8(`id,correct\n${long},1\nb,0\n`));
+    const c = write(utf8(`id,correct\nb,1\n${long},1\n`));
+    const expected = await outcome(() => referencePairPredictions(b, c, 'proportion'));
+    expect(expected).toMatch(/^ok /);
+    expect(await outcome(() => pairPredictions(b, c, 'proportion'))).toBe(expected);
+  });
+});

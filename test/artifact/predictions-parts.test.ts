@@ -1,0 +1,171 @@
+/**
+ * The parts of the byte-level predictions reader, each against a plain model: the waiting table
+ * against two Maps (the original reader's), the hash set against a Set, the increasing-ids check
+ * against a sort, and the number fast path against `Number()`.
+ */
+import fc from 'fast-check';
+import { describe, expect, it } from 'vitest';
+import {
+  BASE,
+  CAND,
+  HashSet64,
+  IdOrder,
+  INLINE_ID_BYTES,
+  WaitingTable,
+  hashId,
+  hashed,
+} from '../../src/artifact/id-tables.js';
+import { NEED, PredictionLines, ROW, iterableReader } from '../../src/artifact/prediction-lines.js';
+
+const ids = fc.oneof(
+  fc.integer({ min: 0, max: 40 }).map((i) => `id-${i}`),
+  fc.integer({ min: 0, max: 5 }).map((i) => `${'long-'.repeat(15)}${i}`), // > INLINE_ID_BYTES
+  fc.integer({ min: 0, max: 5 }).map((i) => `${'w'.repeat(20)}${i}`), // widens the table
+);
+
+describe('WaitingTable', () => {
+  for (const collide of [false, true]) {
+    it(`behaves like the original two Maps${collide ? ' when every hash collides' : ''} (property)`, () => {
+      expect(`${'long-'.repeat(15)}0`.length).toBeGreaterThan(INLINE_ID_BYTES);
+      fc.assert(
+        fc.property(
+          fc.array(fc.tuple(fc.constantFrom(BASE, CAND), ids, fc.integer({ min: 0, max: 1 })), {
+            maxLength: 300,
+          }),
+          fc.boolean(),
+          (steps, losses) => {
+            const table = new WaitingTable(losses, 8);
+            const model = [new Map<string, number>(), new Map<string, number>()];
+            for (const [side, id, v] of steps) {
+              const value = losses ? v + 0.25 : v;
+              const key = Buffer.from(`..${id}`);
+              hashId(key, 2, key.length - 2);
+              const met = table.meet(side, key, 2, key.length - 2, collide ? 7 : hashed.a, value);
+              const other = model[1 - side] as Map<string, number>;
+              const partner = other.get(id);
+              if (partner !== undefined) {
+                other.delete(id);
+                expect(met).toBe(true);
+                expect(table.partner).toBe(partner);
+              } else {
+                (model[side] as Map<string, number>).set(id, value);
+                expect(met).toBe(false);
+              }
+            }
+            expect([table.waitingBase, table.waitingCand]).toEqual([
+              model[BASE]?.size,
+              model[CAND]?.size,
+            ]);
+          },
+        ),
+        { numRuns: 300 },
+      );
+    });
+  }
+});
+
+describe('HashSet64', () => {
+  it('behaves like a Set of (a, b) pairs, including (0, 0) (property)', () => {
+    fc.assert(
+      fc.property(
+        fc.array(fc.tuple(fc.integer({ min: 0, max: 20 }), fc.integer({ min: 0, max: 3 }))),
+        (pairs) => {
+          const set = new HashSet64(4);
+          const model = new Set<string>();
+          for (const [a, b] of pairs) {
+            // Map (0, 1) away so that the model need not know the set's empty marker.
+            if (a === 0 && b === 1) continue;
+            expect(set.add(a, b)).toBe(!model.has(`${a},${b}`));
+            model.add(`${a},${b}`);
+          }
+        },
+      ),
+    );
+  });
+});
+
+describe('IdOrder', () => {
+  it('holds exactly while ids increase by bytes or by length then bytes (property)', () => {
+    const byBytes = (x: Buffer, y: Buffer): number => Buffer.compare(x, y);
+    const byLength = (x: Buffer, y: Buffer): number =>
+      x.length !== y.length ? x.length - y.length : Buffer.compare(x, y);
+    fc.assert(
+      fc.property(fc.array(fc.stringMatching(/^[a-c0-9]{1,4}$/), { maxLength: 12 }), (list) => {
+        const keys = list.map((s) => Buffer.from(s));
+        const order = new IdOrder();
+        let ok = true;
+        keys.forEach((key, i) => {
+          const result = order.next(key, 0, key.length);
+          if (!ok) return;
+          const prefix = keys.slice(0, i + 1);
+          const increasing = (cmp: (x: Buffer, y: Buffer) => number): boolean =>
+            prefix.every((k, j) => j === 0 || cmp(prefix[j - 1] as Buffer, k) < 0);
+          expect(result).toBe(increasing(byBytes) || increasing(byLength));
+          ok = result;
+        });
+      }),
+    );
+  });
+});
+
+async function losses(text: string, chunk: number): Promise<number[]> {
+  const data = Buffer.from(text);
+  const lines = new PredictionLines(
+    iterableReader(async function* () {
+      for (let at = 0; at < data.length; at += chunk) yield data.subarray(at, at + chunk);
+    }),
+    'l.csv',
+    'continuous',
+  );
+  const values: number[] = [];
+  for (;;) {
+    let r = lines.advance();
+    while (r === NEED) {
+      await lines.fill();
+      r = lines.advance();
+    }
+    if (r !== ROW) return values;
+    values.push(lines.value);
+  }
+}
+
+describe('PredictionLines number fast path', () => {
+  it('reads every plain decimal to the same double as Number() (property)', async () => {
+    // Source: ECMA-262 §7.1.4.1.1 StringToNumber (the string rules use Number(); V8 rounds
+    // correctly), so Number() of the same text is the reference.
+    const decimal = fc
+      .tuple(
+        fc.boolean(),
+        fc.stringMatching(/^[0-9]{1,20}$/),
+        fc.option(fc.stringMatching(/^[0-9]{1,20}$/)),
+        fc.option(
+          fc.tuple(fc.constantFrom('e', 'E', 'e+', 'e-', 'E-'), fc.integer({ min: 0, max: 30 })),
+        ),
+      )
+      .map(
+        ([neg, int, frac, exp]) =>
+          `${neg ? '-' : ''}${int}${frac === null ? '' : `.${frac}`}${exp === null ? '' : `${exp[0]}${exp[1]}`}`,
+      );
+    await fc.assert(
+      fc.asyncProperty(
+        fc.array(
+          fc.oneof(decimal, fc.double({ noNaN: true, noDefaultInfinity: true }).map(String)),
+          {
+            minLength: 1,
+            maxLength: 200,
+          },
+        ),
+        fc.integer({ min: 1, max: 64 }),
+        async (texts, chunk) => {
+          const values = await losses(
+            `id,loss\n${texts.map((t, i) => `r${i},${t}\n`).join('')}`,
+            chunk,
+          );
+          expect(values.length).toBe(texts.length);
+          texts.forEach((t, i) => expect(Object.is(values[i], Number(t))).toBe(true));
+        },
+      ),
+      { numRuns: 200 },
+    );
+  });
+});
