@@ -3,8 +3,9 @@
  * `workflow_run` publish step: `review.json` (the `fitgap-review/1` report) and `pull-request.json`
  * (which PR and head commit it was made for). Both are validated before anything is trusted.
  */
-import { Ajv } from 'ajv';
-import type { JSONSchemaType } from 'ajv';
+import type { ErrorObject } from 'ajv';
+import validatePullRequestSchema from '../artifact/generated/pull-request-note.js';
+import validateReviewSchema from '../artifact/generated/review-bundle.js';
 import { InputError } from '../errors.js';
 import type { Issue } from '../errors.js';
 import type { Review } from '../analysis/types.js';
@@ -20,107 +21,13 @@ export interface PullRequestNote {
   headSha: string;
 }
 
-const ajv = new Ajv({ allErrors: true });
-
-const pullRequestSchema: JSONSchemaType<PullRequestNote> = {
-  type: 'object',
-  additionalProperties: false,
-  required: ['format', 'repository', 'number', 'headSha'],
-  properties: {
-    format: { type: 'string', const: 'fitgap-pull-request/1' },
-    repository: { type: 'string', pattern: '^[A-Za-z0-9_.-]{1,100}/[A-Za-z0-9_.-]{1,100}$' },
-    number: { type: 'integer', minimum: 1 },
-    headSha: { type: 'string', pattern: '^[0-9a-f]{40}$' },
-  },
+// Generated at build time from bundle-schemas.ts (scripts/gen-validators.mjs): no schema is
+// compiled when the action starts.
+const validatePullRequest = validatePullRequestSchema as {
+  (data: unknown): data is PullRequestNote;
+  errors?: ErrorObject[] | null;
 };
-
-const enumOf = (values: string[]) => ({ type: 'string', enum: values });
-const delta = {
-  type: 'object',
-  required: ['estimate', 'test', 'call'],
-  properties: { estimate: { type: 'number' }, call: enumOf(['up', 'down', 'flat']) },
-};
-/**
- * The parts of a review the publish step reads directly. The renderer reads the rest; a review
- * that breaks it is refused as a whole (see `publish.ts`).
- */
-const reviewSchema = {
-  type: 'object',
-  required: [
-    'format',
-    'movement',
-    'validation',
-    'slices',
-    'settings',
-    'candidate',
-    'baseline',
-    'gate',
-    'metric',
-  ],
-  properties: {
-    format: { const: 'fitgap-review/1' },
-    movement: enumOf([
-      'better-on-both',
-      'away-from-underfitting',
-      'toward-overfitting',
-      'away-from-overfitting',
-      'no-significant-change',
-      'toward-underfitting',
-      'worse-on-both',
-    ]),
-    validation: {
-      type: 'object',
-      required: ['change', 'delta'],
-      properties: { change: enumOf(['better', 'worse', 'flat']), delta },
-    },
-    slices: {
-      type: 'array',
-      items: {
-        type: 'object',
-        required: ['change'],
-        properties: { change: enumOf(['better', 'worse', 'flat']) },
-      },
-    },
-    settings: { type: 'object' },
-    candidate: {
-      type: 'object',
-      required: ['diagnosis', 'components'],
-      properties: {
-        components: {
-          type: 'object',
-          required: ['overfit'],
-          properties: {
-            overfit: {
-              type: 'object',
-              required: ['present'],
-              properties: { present: { type: 'boolean' } },
-            },
-          },
-        },
-        diagnosis: enumOf([
-          'good-fit',
-          'high-bias',
-          'high-variance',
-          'data-mismatch',
-          'high-bias-and-variance',
-        ]),
-      },
-    },
-    baseline: { type: 'object' },
-    metric: { type: 'object', required: ['name', 'goal', 'kind'] },
-    gate: {
-      type: 'object',
-      required: ['pass', 'reasons'],
-      properties: {
-        pass: { type: 'boolean' },
-        reasons: { type: 'array', maxItems: 50, items: { type: 'string', maxLength: 1000 } },
-      },
-    },
-  },
-} as const;
-
-const validatePullRequest = ajv.compile(pullRequestSchema);
-const validateReview = ajv.compile(reviewSchema);
+const validateReview = validateReviewSchema;
 
 function parse(bytes: Uint8Array, file: string): unknown {
   try {

@@ -48,29 +48,30 @@ export function sameBytes(
 export class IdOrder {
   private lex = true;
   private shortlex = true;
-  private prev = new Uint8Array(64);
-  private prevLen = -1;
 
-  /** Takes the next id; false from the first id that breaks both orders (then stops tracking). */
-  next(key: Uint8Array, start: number, len: number): boolean {
-    const prev = this.prev;
-    const prevLen = this.prevLen;
-    if (prevLen >= 0) {
-      let cmp = 0;
-      const n = len < prevLen ? len : prevLen;
-      for (let i = 0; i < n; i++) {
-        cmp = (key[start + i] as number) - (prev[i] as number);
-        if (cmp !== 0) break;
-      }
-      if (cmp === 0) cmp = len - prevLen;
-      if (cmp <= 0) this.lex = false;
-      if (len !== prevLen ? len < prevLen : cmp <= 0) this.shortlex = false;
-      if (!this.lex && !this.shortlex) return false;
+  /**
+   * Takes the next id, given with the one before it (prevLen −1 for the first); false from the
+   * first id that breaks both orders.
+   */
+  next(
+    key: Uint8Array,
+    start: number,
+    len: number,
+    prev: Uint8Array,
+    prevStart: number,
+    prevLen: number,
+  ): boolean {
+    if (prevLen < 0) return true;
+    let cmp = 0;
+    const n = len < prevLen ? len : prevLen;
+    for (let i = 0; i < n; i++) {
+      cmp = (key[start + i] as number) - (prev[prevStart + i] as number);
+      if (cmp !== 0) break;
     }
-    if (len > prev.length) this.prev = new Uint8Array(len * 2);
-    this.prev.set(key.subarray(start, start + len));
-    this.prevLen = len;
-    return true;
+    if (cmp === 0) cmp = len - prevLen;
+    if (cmp <= 0) this.lex = false;
+    if (len !== prevLen ? len < prevLen : cmp <= 0) this.shortlex = false;
+    return this.lex || this.shortlex;
   }
 }
 
@@ -214,7 +215,7 @@ export class WaitingTable {
     else this.waitingCand++;
     hashes[i] = hash;
     lens[i] = len;
-    keys.set(key.subarray(start, start + len), i * width);
+    for (let k = 0, at = i * width; k < len; k++) keys[at + k] = key[start + k] as number;
     this.store(i, side, value);
     return false;
   }
@@ -262,7 +263,7 @@ export class WaitingTable {
       lens[i] = l;
       tags[i] = tags[j] as number;
       if (values !== null) values[i] = values[j] as number;
-      keys.copyWithin(i * width, j * width, j * width + l);
+      for (let k = 0; k < l; k++) keys[i * width + k] = keys[j * width + k] as number;
       i = j;
     }
     lens[i] = 0;
@@ -290,7 +291,7 @@ export class WaitingTable {
       this.lens[i] = l;
       this.tags[i] = tags[s] as number;
       if (this.values !== null && values !== null) this.values[i] = values[s] as number;
-      this.keys.set(keys.subarray(s * oldWidth, s * oldWidth + l), i * width);
+      for (let k = 0; k < l; k++) this.keys[i * width + k] = keys[s * oldWidth + k] as number;
     }
   }
 }

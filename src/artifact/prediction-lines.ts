@@ -12,7 +12,8 @@
  * UTF-8, odd numbers, errors) is decoded and read by the string rules, with the same messages.
  *
  * A row's id is exposed as `key[keyStart, keyStart + keyLen)`: the UTF-8 bytes of the id string the
- * string rules would give, so that equal bytes mean equal ids on both paths.
+ * string rules would give, so that equal bytes mean equal ids on both paths. The previous row's id
+ * stays readable as `prevKey[prevStart, prevStart + prevLen)` (for the increasing-ids check).
  */
 import type { FileHandle } from 'node:fs/promises';
 import type { MetricKind } from './types.js';
@@ -113,6 +114,10 @@ export class PredictionLines {
   keyStart = 0;
   keyLen = 0;
   value = 0;
+  /** The previous row's id (prevLen −1 before the second row). */
+  prevKey: Buffer;
+  prevStart = 0;
+  prevLen = -1;
 
   private buf: Buffer = Buffer.allocUnsafe(CHUNK);
   private pos = 0;
@@ -121,6 +126,8 @@ export class PredictionLines {
   private pending: string[] | null = null;
   private pendingAt = 0;
   private scratch: Buffer = Buffer.allocUnsafe(256);
+  /** A copy of the last row's id when its bytes are about to be overwritten. */
+  private saved: Buffer = Buffer.allocUnsafe(256);
   private readonly proportion: boolean;
 
   constructor(
@@ -129,11 +136,13 @@ export class PredictionLines {
     readonly kind: MetricKind,
   ) {
     this.key = this.buf;
+    this.prevKey = this.buf;
     this.proportion = kind === 'proportion';
   }
 
   /** Reads more bytes after `advance()` returned NEED (keeps the unread part of the buffer). */
   async fill(): Promise<void> {
+    if (this.key === this.buf) this.save();
     const rest = this.end - this.pos;
     if (rest === this.buf.length) {
       // A line longer than the buffer: grow it.
@@ -203,6 +212,9 @@ export class PredictionLines {
         if (after < 0) return this.slow(start);
         p = after;
       }
+      this.prevKey = this.key;
+      this.prevStart = this.keyStart;
+      this.prevLen = this.rows === 0 ? -1 : this.keyLen;
       this.key = buf;
       this.keyStart = start;
       this.keyLen = idEnd - start;
@@ -338,6 +350,10 @@ export class PredictionLines {
           { file: this.file, pointer: `line ${this.line}`, expected: 'must have a non-empty id' },
         ]);
       this.value = parseValue(text.slice(comma + 1), this.kind, this.file, this.line);
+      if (this.key === this.scratch) this.save();
+      this.prevKey = this.key;
+      this.prevStart = this.keyStart;
+      this.prevLen = this.rows === 0 ? -1 : this.keyLen;
       const length = Buffer.byteLength(id, 'utf8');
       if (length > this.scratch.length) this.scratch = Buffer.allocUnsafe(length * 2);
       this.scratch.write(id, 0, 'utf8');
@@ -349,6 +365,14 @@ export class PredictionLines {
     }
     this.pending = null;
     return false;
+  }
+
+  /** Moves the last row's id to `saved` before the buffer holding it is reused. */
+  private save(): void {
+    if (this.keyLen > this.saved.length) this.saved = Buffer.allocUnsafe(this.keyLen * 2);
+    this.key.copy(this.saved, 0, this.keyStart, this.keyStart + this.keyLen);
+    this.key = this.saved;
+    this.keyStart = 0;
   }
 
   /** The current row's id as a string (for messages). */

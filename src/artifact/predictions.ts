@@ -88,7 +88,17 @@ class Repeats {
 
   /** False while the ids keep increasing; then every row needs its hash `add`ed. */
   needsHash(lines: PredictionLines): boolean {
-    return this.seen !== null || !this.order.next(lines.key, lines.keyStart, lines.keyLen);
+    return (
+      this.seen !== null ||
+      !this.order.next(
+        lines.key,
+        lines.keyStart,
+        lines.keyLen,
+        lines.prevKey,
+        lines.prevStart,
+        lines.prevLen,
+      )
+    );
   }
 
   /** At the first id out of order: hashes every earlier id of the file. */

@@ -1,30 +1,16 @@
 /**
- * Validates a parsed run artifact: the JSON Schema (compiled once), then the checks a schema cannot
- * express. Returns the typed run or throws `InputError` with every issue found.
+ * Validates a parsed run artifact: the JSON Schema (a validator generated at build time by
+ * scripts/gen-validators.mjs), then the checks a schema cannot express. Returns the typed run or
+ * throws `InputError` with every issue found.
  */
-import { Ajv2020 } from 'ajv/dist/2020.js';
-import addFormatsModule from 'ajv-formats';
-import type { ValidateFunction } from 'ajv';
-import schema from '../../schema/fitgap-run-1.schema.json' with { type: 'json' };
+import type { ErrorObject } from 'ajv';
+import validateRunSchema from './generated/run-schema.js';
 import { InputError, quote, type Issue } from '../errors.js';
 import { ajvIssues, nonFiniteNumbers } from './ajv-issues.js';
 import { CURVE_NAMES, SPLIT_NAMES, type RunArtifact } from './types.js';
 
-// ajv-formats is CommonJS; its default export arrives wrapped under esbuild and Node alike.
-type AddFormats = (ajv: Ajv2020, formats: string[]) => unknown;
-const formatsModule = addFormatsModule as unknown as AddFormats | { default: AddFormats };
-const addFormats: AddFormats =
-  typeof formatsModule === 'function' ? formatsModule : formatsModule.default;
-
-let compiled: ValidateFunction<RunArtifact> | undefined;
-
-function validator(): ValidateFunction<RunArtifact> {
-  if (compiled === undefined) {
-    const ajv = new Ajv2020({ allErrors: true, strict: true, strictNumbers: true });
-    addFormats(ajv, ['date-time']);
-    compiled = ajv.compile<RunArtifact>(schema);
-  }
-  return compiled;
+function validator(): { (doc: unknown): doc is RunArtifact; errors?: ErrorObject[] | null } {
+  return validateRunSchema as { (doc: unknown): doc is RunArtifact; errors?: ErrorObject[] | null };
 }
 
 /** Checks the schema cannot express. `file` names the artifact in messages. */

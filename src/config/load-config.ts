@@ -2,19 +2,20 @@
  * Reads and validates the YAML config file. Adapter (file I/O); throws `InputError`.
  */
 import { readFile } from 'node:fs/promises';
-import { Ajv2020 } from 'ajv/dist/2020.js';
-import type { ValidateFunction } from 'ajv';
+import type { ErrorObject } from 'ajv';
 import { parseDocument } from 'yaml';
-import schema from '../../schema/fitgap-config.schema.json' with { type: 'json' };
+import validateConfigSchema from '../artifact/generated/config-schema.js';
 import { InputError, quote, type Issue } from '../errors.js';
 import { ajvIssues } from '../artifact/ajv-issues.js';
 import { FAIL_ON_VALUES, isFailOn } from './policy.js';
 import type { ConfigFile } from './types.js';
 
-let compiled: ValidateFunction<ConfigFile> | undefined;
-function validator(): ValidateFunction<ConfigFile> {
-  compiled ??= new Ajv2020({ allErrors: true, strict: true }).compile<ConfigFile>(schema);
-  return compiled;
+/** The config schema's validator, generated at build time (scripts/gen-validators.mjs). */
+function validator(): { (data: unknown): data is ConfigFile; errors?: ErrorObject[] | null } {
+  return validateConfigSchema as {
+    (data: unknown): data is ConfigFile;
+    errors?: ErrorObject[] | null;
+  };
 }
 
 /** Checks a list of `fail-on` names; `where` names the file or flag in messages. */
