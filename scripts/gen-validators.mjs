@@ -5,6 +5,7 @@
 //
 //   node scripts/gen-validators.mjs          write src/artifact/generated/*
 //   node scripts/gen-validators.mjs --check  exit 1 when a generated file is stale
+import { Buffer } from 'node:buffer';
 import { readFileSync, writeFileSync, mkdirSync } from 'node:fs';
 import { createRequire } from 'node:module';
 import { join } from 'node:path';

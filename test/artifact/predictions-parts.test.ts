@@ -95,7 +95,8 @@ describe('IdOrder', () => {
         const order = new IdOrder();
         let ok = true;
         keys.forEach((key, i) => {
-          const result = order.next(key, 0, key.length);
+          const prev = keys[i - 1] ?? Buffer.alloc(0);
+          const result = order.next(key, 0, key.length, prev, 0, i === 0 ? -1 : prev.length);
           if (!ok) return;
           const prefix = keys.slice(0, i + 1);
           const increasing = (cmp: (x: Buffer, y: Buffer) => number): boolean =>
