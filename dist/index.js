@@ -23222,14 +23222,14 @@ var require_identity = __commonJS({
     var ALIAS = /* @__PURE__ */ Symbol.for("yaml.alias");
     var DOC = /* @__PURE__ */ Symbol.for("yaml.document");
     var MAP = /* @__PURE__ */ Symbol.for("yaml.map");
-    var PAIR = /* @__PURE__ */ Symbol.for("yaml.pair");
+    var PAIR2 = /* @__PURE__ */ Symbol.for("yaml.pair");
     var SCALAR = /* @__PURE__ */ Symbol.for("yaml.scalar");
     var SEQ = /* @__PURE__ */ Symbol.for("yaml.seq");
     var NODE_TYPE = /* @__PURE__ */ Symbol.for("yaml.node.type");
     var isAlias = (node) => !!node && typeof node === "object" && node[NODE_TYPE] === ALIAS;
     var isDocument = (node) => !!node && typeof node === "object" && node[NODE_TYPE] === DOC;
     var isMap = (node) => !!node && typeof node === "object" && node[NODE_TYPE] === MAP;
-    var isPair = (node) => !!node && typeof node === "object" && node[NODE_TYPE] === PAIR;
+    var isPair = (node) => !!node && typeof node === "object" && node[NODE_TYPE] === PAIR2;
     var isScalar = (node) => !!node && typeof node === "object" && node[NODE_TYPE] === SCALAR;
     var isSeq = (node) => !!node && typeof node === "object" && node[NODE_TYPE] === SEQ;
     function isCollection(node) {
@@ -23257,7 +23257,7 @@ var require_identity = __commonJS({
     exports.DOC = DOC;
     exports.MAP = MAP;
     exports.NODE_TYPE = NODE_TYPE;
-    exports.PAIR = PAIR;
+    exports.PAIR = PAIR2;
     exports.SCALAR = SCALAR;
     exports.SEQ = SEQ;
     exports.hasAnchor = hasAnchor;
@@ -45673,155 +45673,312 @@ var HashSet64 = class {
     }
   }
 };
-var BASE = 0;
-var CAND = 1;
+var BASE = 1;
+var CAND = 2;
+var BOTH = 3;
+var ONE = 4;
+var BITS = 3;
 var INLINE_ID_BYTES = 64;
-var WaitingTable = class {
-  /** Rows waiting, per side. */
+var IdTable = class {
+  /** `losses`: values are numbers, not 0/1. `slots`: initial capacity, a power of two. */
+  constructor(losses, slots = 1 << 12) {
+    this.losses = losses;
+    this.cap = slots;
+    this.mask = slots - 1;
+    this.words = new Uint32Array(slots * this.stride);
+    this.bytes = new Uint8Array(this.words.buffer);
+    this.values = losses ? new Float64Array(slots) : null;
+  }
+  losses;
+  /** Rows waiting, per file. */
   waitingBase = 0;
   waitingCand = 0;
-  /** The partner's value after `meet` returned true. */
+  /** Files (BASE | CAND) with an id seen twice. */
+  repeated = 0;
+  /** The value of the row `meet` paired with. */
   partner = 0;
+  /** The value of the arriving row, for `meet` (a field: a double argument would be boxed). */
+  incoming = 0;
+  recording = false;
   cap;
   mask;
   width = 16;
+  stride = 2 + 16 / 4;
   count = 0;
-  hashes;
-  /** Id length; 0 marks an empty slot (ids are never empty). */
-  lens;
-  tags;
-  keys;
+  words;
+  bytes;
   values;
   long = /* @__PURE__ */ new Map();
-  /** `losses`: values are numbers, not 0/1. `slots`: initial capacity, a power of two. */
-  constructor(losses, slots = 1 << 12) {
-    this.cap = slots;
-    this.mask = slots - 1;
-    this.hashes = new Uint32Array(slots);
-    this.lens = new Int32Array(slots);
-    this.tags = new Uint8Array(slots);
-    this.keys = new Uint8Array(slots * this.width);
-    this.values = losses ? new Float64Array(slots) : null;
+  /** Keep every id from now on; `expected`: about how many distinct ids will come. */
+  recordAll(expected) {
+    this.recording = true;
+    this.reserve(expected);
   }
   /**
-   * A row of `side` arrives. When its id waits from the other side, that row leaves the table and
-   * its value is in `partner` (true). Otherwise the row waits, replacing a row of the same side
-   * and id (false). `hash` is `hashed.a` of the id.
+   * A row of `side` out of step with the other file: pairs with a waiting row of the other file
+   * (true; its value in `partner`) or waits (false). `incoming` holds the row's value.
    */
-  meet(side, key, start, len, hash, value) {
-    if (len > INLINE_ID_BYTES)
-      return this.meetLong(side, key.toString("latin1", start, start + len), value);
-    if (len > this.width || (this.count + 1) * 10 > this.cap * 7) {
-      let width2 = this.width;
-      while (width2 < len) width2 *= 2;
-      this.rebuild((this.count + 1) * 10 > this.cap * 7 ? this.cap * 2 : this.cap, width2);
+  meet(side, key, start, len, hash) {
+    if (len > INLINE_ID_BYTES) return this.longMeet(side, key, start, len);
+    const slot = this.find(key, start, len, hash);
+    if (slot < 0) {
+      this.insert(~slot, key, start, len, hash, side);
+      return false;
     }
-    const { lens, hashes, keys, tags, width, mask } = this;
+    const at = slot * this.stride + 1;
+    const word = this.words[at];
+    const bits2 = word & BOTH;
+    if ((bits2 & side) !== 0) {
+      this.repeated |= side;
+      if (bits2 === side) this.store(slot, at, word, side);
+      return false;
+    }
+    this.partner = this.values === null ? (word & ONE) >>> 2 : this.values[slot];
+    this.count1(bits2, -1);
+    if (this.recording) this.words[at] = word & ~(ONE | BOTH) | BOTH;
+    else this.remove(slot);
+    return true;
+  }
+  /** Rows of both files with this id, in step (only while recording). */
+  together(key, start, len, hash) {
+    if (len > INLINE_ID_BYTES) {
+      const id = Buffer.from(key.buffer, key.byteOffset, key.byteLength).toString(
+        "latin1",
+        start,
+        start + len
+      );
+      const entry = this.long.get(id);
+      if (entry === void 0) this.long.set(id, { bits: BOTH, value: 0 });
+      else {
+        this.repeated |= entry.bits;
+        entry.bits = BOTH;
+      }
+      return;
+    }
+    const slot = this.find(key, start, len, hash);
+    if (slot < 0) this.insert(~slot, key, start, len, hash, BOTH);
+    else {
+      const at = slot * this.stride + 1;
+      this.repeated |= this.words[at] & BOTH;
+    }
+  }
+  /**
+   * An id of `side` read before `recordAll` (re-read from the file's start): it paired then unless
+   * it still waits. Waiting from the other file, though, means that file has it twice.
+   */
+  mark(side, key, start, len, hash) {
+    if (len > INLINE_ID_BYTES) {
+      const id = Buffer.from(key.buffer, key.byteOffset, key.byteLength).toString(
+        "latin1",
+        start,
+        start + len
+      );
+      const entry = this.long.get(id);
+      if (entry === void 0) this.long.set(id, { bits: BOTH, value: 0 });
+      else if ((entry.bits & side) === 0) this.repeated |= entry.bits;
+      return;
+    }
+    const slot = this.find(key, start, len, hash);
+    if (slot < 0) this.insert(~slot, key, start, len, hash, BOTH);
+    else {
+      const bits2 = this.words[slot * this.stride + 1] & BOTH;
+      if ((bits2 & side) === 0) this.repeated |= bits2;
+    }
+  }
+  longMeet(side, key, start, len) {
+    const id = Buffer.from(key.buffer, key.byteOffset, key.byteLength).toString(
+      "latin1",
+      start,
+      start + len
+    );
+    const entry = this.long.get(id);
+    if (entry === void 0) {
+      this.long.set(id, { bits: side, value: this.incoming });
+      this.count1(side, 1);
+      return false;
+    }
+    if ((entry.bits & side) !== 0) {
+      this.repeated |= side;
+      if (entry.bits === side) entry.value = this.incoming;
+      return false;
+    }
+    this.partner = entry.value;
+    this.count1(entry.bits, -1);
+    if (this.recording) entry.bits = BOTH;
+    else this.long.delete(id);
+    return true;
+  }
+  /** Slot of the id, or ~slot where it would go. */
+  find(key, start, len, hash) {
+    if (len > this.width || (this.count + 1) * 10 > this.cap * 7) this.grow(len);
+    const { words, bytes, stride, mask } = this;
     let i2 = hash & mask;
     for (; ; ) {
-      const l = lens[i2];
-      if (l === 0) break;
-      if (l === len && hashes[i2] === hash) {
-        let at = i2 * width;
+      const at = i2 * stride;
+      const word = words[at + 1];
+      if (word === 0) return ~i2;
+      if (word >>> BITS === len && words[at] === hash) {
+        let b = (at + 2) * 4;
         let k = start;
         const stop = start + len;
-        while (k < stop && keys[at] === key[k]) {
-          at++;
+        while (k < stop && bytes[b] === key[k]) {
+          b++;
           k++;
         }
-        if (k === stop) {
-          const tag = tags[i2];
-          if ((tag & 1) !== side) {
-            this.partner = this.values === null ? tag >> 1 : this.values[i2];
-            this.remove(i2, tag & 1);
-            return true;
-          }
-          this.store(i2, side, value);
-          return false;
-        }
+        if (k === stop) return i2;
       }
       i2 = i2 + 1 & mask;
     }
+  }
+  insert(slot, key, start, len, hash, bits2) {
+    const at = slot * this.stride;
+    this.words[at] = hash;
+    const bytes = this.bytes;
+    for (let k = 0, b = (at + 2) * 4; k < len; k++) bytes[b + k] = key[start + k];
     this.count++;
-    if (side === BASE) this.waitingBase++;
-    else this.waitingCand++;
-    hashes[i2] = hash;
-    lens[i2] = len;
-    for (let k = 0, at = i2 * width; k < len; k++) keys[at + k] = key[start + k];
-    this.store(i2, side, value);
-    return false;
+    if (bits2 === BOTH) this.words[at + 1] = len << BITS | BOTH;
+    else this.store(slot, at + 1, len << BITS, bits2);
   }
-  meetLong(side, id, value) {
-    const waiting = this.long.get(id);
-    if (waiting !== void 0 && waiting.side !== side) {
-      this.partner = waiting.value;
-      this.long.delete(id);
-      if (waiting.side === BASE) this.waitingBase--;
-      else this.waitingCand--;
-      return true;
-    }
-    if (waiting === void 0) {
-      if (side === BASE) this.waitingBase++;
-      else this.waitingCand++;
-    }
-    this.long.set(id, { side, value });
-    return false;
-  }
-  store(i2, side, value) {
-    if (this.values === null) this.tags[i2] = side | value << 1;
+  /** Makes the entry at `slot` a waiting row of `side` with the incoming value. */
+  store(slot, at, word, side) {
+    const base = word & ~(ONE | BOTH) | side;
+    if (this.values === null) this.words[at] = this.incoming === 1 ? base | ONE : base;
     else {
-      this.tags[i2] = side;
-      this.values[i2] = value;
+      this.words[at] = base;
+      this.values[slot] = this.incoming;
     }
+    if ((word & BOTH) !== side) this.count1(side, 1);
   }
-  remove(slot, side) {
-    const { lens, hashes, tags, keys, values, width, mask } = this;
-    if (side === BASE) this.waitingBase--;
-    else this.waitingCand--;
+  count1(bits2, by) {
+    if (bits2 === BASE) this.waitingBase += by;
+    else if (bits2 === CAND) this.waitingCand += by;
+  }
+  remove(slot) {
+    const { words, values, stride, mask } = this;
     this.count--;
     let i2 = slot;
     let j = slot;
     for (; ; ) {
       j = j + 1 & mask;
-      const l = lens[j];
-      if (l === 0) break;
-      const home = hashes[j] & mask;
+      const word = words[j * stride + 1];
+      if (word === 0) break;
+      const home = words[j * stride] & mask;
       if (i2 <= j ? i2 < home && home <= j : i2 < home || home <= j) continue;
-      hashes[i2] = hashes[j];
-      lens[i2] = l;
-      tags[i2] = tags[j];
+      words.copyWithin(i2 * stride, j * stride, j * stride + stride);
       if (values !== null) values[i2] = values[j];
-      for (let k = 0; k < l; k++) keys[i2 * width + k] = keys[j * width + k];
       i2 = j;
     }
-    lens[i2] = 0;
+    words[i2 * stride + 1] = 0;
+  }
+  /** Room for `n` entries at a load of at most 0.7. */
+  reserve(n) {
+    let cap = this.cap;
+    while (n * 10 > cap * 7) cap *= 2;
+    if (cap > this.cap) this.rebuild(cap, this.width);
+  }
+  grow(len) {
+    let width = this.width;
+    while (width < len) width *= 2;
+    const cap = (this.count + 1) * 10 > this.cap * 7 ? this.cap * 2 : this.cap;
+    this.rebuild(cap, width);
   }
   rebuild(cap, width) {
-    const { lens, hashes, tags, keys, values } = this;
-    const oldWidth = this.width;
-    const oldCap = this.cap;
+    const { words, values, stride, cap: oldCap } = this;
     this.cap = cap;
     this.mask = cap - 1;
     this.width = width;
-    this.hashes = new Uint32Array(cap);
-    this.lens = new Int32Array(cap);
-    this.tags = new Uint8Array(cap);
-    this.keys = new Uint8Array(cap * width);
+    this.stride = 2 + width / 4;
+    this.words = new Uint32Array(cap * this.stride);
+    this.bytes = new Uint8Array(this.words.buffer);
     this.values = values === null ? null : new Float64Array(cap);
+    const keyWords = stride - 2;
     for (let s = 0; s < oldCap; s++) {
-      const l = lens[s];
-      if (l === 0) continue;
-      const h = hashes[s];
-      let i2 = h & this.mask;
-      while (this.lens[i2] !== 0) i2 = i2 + 1 & this.mask;
-      this.hashes[i2] = h;
-      this.lens[i2] = l;
-      this.tags[i2] = tags[s];
+      const word = words[s * stride + 1];
+      if (word === 0) continue;
+      const hash = words[s * stride];
+      let i2 = hash & this.mask;
+      while (this.words[i2 * this.stride + 1] !== 0) i2 = i2 + 1 & this.mask;
+      const at = i2 * this.stride;
+      this.words[at] = hash;
+      this.words[at + 1] = word;
+      for (let w = 0; w < keyWords; w++)
+        this.words[at + 2 + w] = words[s * stride + 2 + w];
       if (this.values !== null && values !== null) this.values[i2] = values[s];
-      for (let k = 0; k < l; k++) this.keys[i2 * width + k] = keys[s * oldWidth + k];
     }
   }
 };
+
+// src/artifact/decimal.ts
+var POW10 = Array.from({ length: 23 }, (_, i2) => Number(`1e${i2}`));
+var SPLIT = 134217729;
+var POW10_HI = POW10.map((x2) => SPLIT * x2 - (SPLIT * x2 - x2));
+var POW10_LO = POW10.map((x2, i2) => x2 - POW10_HI[i2]);
+var f64 = new Float64Array(1);
+var u32 = new Uint32Array(f64.buffer);
+var HI = new Uint8Array(new Uint16Array([1]).buffer)[0] === 1 ? 1 : 0;
+var LO = 1 - HI;
+var decoded = new Float64Array(1);
+function round(q0, r, scale) {
+  if (r === 0) {
+    decoded[0] = q0;
+    return true;
+  }
+  f64[0] = q0;
+  let lo = u32[LO] + (r > 0 ? 1 : -1);
+  let hi = u32[HI];
+  if (lo > 4294967295) {
+    lo = 0;
+    hi++;
+  } else if (lo < 0) {
+    lo = 4294967295;
+    hi--;
+  }
+  u32[LO] = lo;
+  u32[HI] = hi;
+  const c = f64[0];
+  const half = Math.abs(c - q0) * scale / 2;
+  const a = Math.abs(r);
+  const margin = half * 2 ** -20;
+  if (a < half - margin) decoded[0] = q0;
+  else if (a > half + margin && a < 2 * half * 1.2) decoded[0] = c;
+  else return false;
+  return true;
+}
+function decimalToDouble(hi, lo, loDigits, scale) {
+  if (scale < -22 || scale > 22 || loDigits > 4) return false;
+  const k = scale < 0 ? -scale : scale;
+  const d = POW10[k];
+  if (loDigits === 0) {
+    decoded[0] = scale < 0 ? hi / d : hi * d;
+    return true;
+  }
+  if (hi === 0) return false;
+  const t = POW10[loDigits];
+  const th = POW10_HI[loDigits];
+  const tl = POW10_LO[loDigits];
+  let x2 = SPLIT * hi;
+  let xh = x2 - (x2 - hi);
+  let xl = hi - xh;
+  const p = hi * t;
+  const e = xh * th - p + xh * tl + xl * th + xl * tl + lo;
+  const mh = p + e;
+  const ml = e - (mh - p);
+  const dh = POW10_HI[k];
+  const dl = POW10_LO[k];
+  if (scale >= 0) {
+    const q02 = mh * d;
+    x2 = SPLIT * mh;
+    xh = x2 - (x2 - mh);
+    xl = mh - xh;
+    return round(q02, xh * dh - q02 + xh * dl + xl * dh + xl * dl + ml * d, 1);
+  }
+  const q0 = mh / d;
+  const pp = q0 * d;
+  x2 = SPLIT * q0;
+  xh = x2 - (x2 - q0);
+  xl = q0 - xh;
+  return round(q0, mh - pp - (xh * dh - pp + xh * dl + xl * dh + xl * dl) + ml, d);
+}
 
 // src/artifact/prediction-lines.ts
 var CHUNK = 1 << 20;
@@ -45864,8 +46021,6 @@ function iterableReader(make) {
   };
 }
 var HEADER = { proportion: "id,correct", continuous: "id,loss" };
-var TWO_53 = 9007199254740992;
-var POW10 = Array.from({ length: 23 }, (_, i2) => Number(`1e${i2}`));
 function valueError(kind, file, line, raw) {
   const column = kind === "proportion" ? "correct" : "loss";
   return new InputError([
@@ -45910,6 +46065,8 @@ var PredictionLines = class {
   prevLen = -1;
   buf = Buffer.allocUnsafe(CHUNK);
   pos = 0;
+  /** Bytes before `buf[0]`. */
+  dropped = 0;
   end = 0;
   eof = false;
   pending = null;
@@ -45921,6 +46078,7 @@ var PredictionLines = class {
   /** Reads more bytes after `advance()` returned NEED (keeps the unread part of the buffer). */
   async fill() {
     if (this.key === this.buf) this.save();
+    this.dropped += this.pos;
     const rest = this.end - this.pos;
     if (rest === this.buf.length) {
       const bigger = Buffer.allocUnsafe(this.buf.length * 2);
@@ -46001,9 +46159,7 @@ var PredictionLines = class {
   /**
    * Reads a plain decimal (`-?D+(.D+)?([eE][+-]?D+)?`) followed by `\n` from `p`; sets `value` and
    * returns the index after the newline, or −1 for anything else (the line takes the string path).
-   * Exact: up to 16 digits below 2^53 with |exponent| ≤ 22 is one correctly rounded operation on
-   * two exact doubles (Clinger 1990, "How to read floating point numbers accurately", PLDI); other
-   * plain decimals go through `Number()` of the same characters.
+   * The value is what `Number()` gives for the same text: decimal.ts, or `Number()` itself.
    */
   number(from) {
     const buf = this.buf;
@@ -46012,29 +46168,34 @@ var PredictionLines = class {
     let c = p < end ? buf[p] : -1;
     const negative = c === 45;
     if (negative) c = ++p < end ? buf[p] : -1;
-    let m = 0;
-    let digits = 0;
-    let intDigits = 0;
-    while (c >= 48 && c <= 57) {
-      m = m * 10 + (c - 48);
-      if (m !== 0) digits++;
-      intDigits++;
-      c = ++p < end ? buf[p] : -1;
-    }
-    if (intDigits === 0) return -1;
-    let scale = 0;
-    if (c === 46) {
-      c = ++p < end ? buf[p] : -1;
-      let fraction = 0;
-      while (c >= 48 && c <= 57) {
-        m = m * 10 + (c - 48);
-        if (m !== 0) digits++;
-        fraction++;
-        c = ++p < end ? buf[p] : -1;
+    let hi = 0;
+    let lo = 0;
+    let loDigits = 0;
+    const intStart = p;
+    while (p < end && (c = buf[p]) >= 48 && c <= 57) {
+      if (hi < 1e14) hi = hi * 10 + (c - 48);
+      else {
+        lo = lo * 10 + (c - 48);
+        loDigits++;
       }
-      if (fraction === 0) return -1;
-      scale = -fraction;
+      p++;
     }
+    if (p === intStart) return -1;
+    let scale = 0;
+    if (p < end && c === 46) {
+      const fracStart = ++p;
+      while (p < end && (c = buf[p]) >= 48 && c <= 57) {
+        if (hi < 1e14) hi = hi * 10 + (c - 48);
+        else {
+          lo = lo * 10 + (c - 48);
+          loDigits++;
+        }
+        p++;
+      }
+      if (p === fracStart) return -1;
+      scale = fracStart - p;
+    }
+    if (p >= end) return -1;
     if (c === 101 || c === 69) {
       c = ++p < end ? buf[p] : -1;
       let sign = 1;
@@ -46043,19 +46204,18 @@ var PredictionLines = class {
         c = ++p < end ? buf[p] : -1;
       }
       let e = 0;
-      let eDigits = 0;
-      while (c >= 48 && c <= 57) {
+      const expStart = p;
+      while (p < end && (c = buf[p]) >= 48 && c <= 57) {
         if (e < 1e5) e = e * 10 + (c - 48);
-        eDigits++;
-        c = ++p < end ? buf[p] : -1;
+        p++;
       }
-      if (eDigits === 0) return -1;
+      if (p === expStart || p >= end) return -1;
       scale += sign * e;
     }
     if (c !== 10) return -1;
     let value;
-    if (digits <= 16 && m < TWO_53 && scale >= -22 && scale <= 22) {
-      value = scale < 0 ? m / POW10[-scale] : m * POW10[scale];
+    if (decimalToDouble(hi, lo, loDigits, scale)) {
+      value = decoded[0];
       if (negative) value = -value;
     } else {
       value = Number(buf.toString("latin1", from, p));
@@ -46136,6 +46296,10 @@ var PredictionLines = class {
     this.pending = null;
     return false;
   }
+  /** Bytes read up to the current row. */
+  get consumed() {
+    return this.dropped + this.pos;
+  }
   /** Moves the last row's id to `saved` before the buffer holding it is reused. */
   save() {
     if (this.keyLen > this.saved.length) this.saved = Buffer.allocUnsafe(this.keyLen * 2);
@@ -46153,94 +46317,190 @@ var PredictionLines = class {
 };
 
 // src/artifact/predictions.ts
-function readersOf(f, opened) {
+async function openFile(f, opened) {
   const source = f.source;
-  if (typeof source === "function") return () => iterableReader(source);
-  if (source !== void 0) return () => handleReader(source);
-  if (f.path === void 0) throw new TypeError(`predictions file ${f.file}: no path or source`);
-  return open2(f.path, "r").then((handle) => {
+  if (typeof source === "function") return { reader: () => iterableReader(source), size: null };
+  let handle;
+  if (source !== void 0) handle = source;
+  else {
+    if (f.path === void 0) throw new TypeError(`predictions file ${f.file}: no path or source`);
+    handle = await open2(f.path, "r");
     opened.push(handle);
-    return () => handleReader(handle);
-  });
+  }
+  const size = (await handle.stat()).size;
+  return { reader: () => handleReader(handle), size };
 }
-async function refill(lines) {
-  let r = NEED;
+async function row(lines) {
+  let r = lines.advance();
   while (r === NEED) {
     await lines.fill();
     r = lines.advance();
   }
   return r === ROW;
 }
-async function row(lines) {
-  const r = lines.advance();
-  return r === NEED ? refill(lines) : r === ROW;
+async function repeatedIds(o, file, kind) {
+  const hashes = new HashSet64();
+  const suspects = /* @__PURE__ */ new Set();
+  let lines = new PredictionLines(o.reader(), file, kind);
+  try {
+    while (await row(lines)) {
+      hashId(lines.key, lines.keyStart, lines.keyLen);
+      if (!hashes.add(hashed.a, hashed.b)) suspects.add(`${hashed.a},${hashed.b}`);
+    }
+  } finally {
+    await lines.close();
+  }
+  const firstLine = /* @__PURE__ */ new Map();
+  const issues2 = [];
+  if (suspects.size === 0) return issues2;
+  lines = new PredictionLines(o.reader(), file, kind);
+  try {
+    while (await row(lines)) {
+      hashId(lines.key, lines.keyStart, lines.keyLen);
+      if (!suspects.has(`${hashed.a},${hashed.b}`)) continue;
+      const id = lines.id();
+      const first = firstLine.get(id);
+      if (first === void 0) firstLine.set(id, lines.line);
+      else
+        issues2.push({
+          file,
+          pointer: `line ${lines.line}`,
+          expected: `must have a unique id (also on line ${first})`,
+          got: quote(id)
+        });
+    }
+  } finally {
+    await lines.close();
+  }
+  return issues2;
 }
-var Repeats = class {
-  constructor(readers, file, kind) {
-    this.readers = readers;
-    this.file = file;
-    this.kind = kind;
+var DONE = 0;
+var NEED_A = 1;
+var NEED_B = 2;
+var RECORD = 3;
+var ADVANCE_A = 0;
+var ADVANCE_B = 1;
+var PAIR = 2;
+var BATCH = 4096;
+var Pairing = class {
+  constructor(a, b, table2, kind) {
+    this.a = a;
+    this.b = b;
+    this.table = table2;
+    this.proportion = kind === "proportion";
   }
-  readers;
-  file;
-  kind;
-  order = new IdOrder();
-  /** Hashes of every id so far, once the ids stopped increasing. */
-  seen = null;
-  /** Hashes seen twice: the ids to confirm. */
-  suspects = /* @__PURE__ */ new Set();
-  /** False while the ids keep increasing; then every row needs its hash `add`ed. */
-  needsHash(lines) {
-    return this.seen !== null || !this.order.next(
-      lines.key,
-      lines.keyStart,
-      lines.keyLen,
-      lines.prevKey,
-      lines.prevStart,
-      lines.prevLen
-    );
-  }
-  /** At the first id out of order: hashes every earlier id of the file. */
-  async start(rowsBefore) {
-    this.seen = new HashSet64();
-    const again = new PredictionLines(this.readers(), this.file, this.kind);
-    try {
-      for (let n = rowsBefore; n > 0 && await row(again); n--) {
-        hashId(again.key, again.keyStart, again.keyLen);
-        this.add(hashed.a, hashed.b);
+  a;
+  b;
+  table;
+  rows = 0;
+  baselineOnly = 0;
+  candidateOnly = 0;
+  diffs = new RunningStats();
+  /** Files (BASE | CAND) whose ids stopped increasing and are all in the table. */
+  recorded = 0;
+  /** The file that `run()` returned RECORD for. */
+  stopped = 0;
+  hasA = true;
+  hasB = true;
+  phase = ADVANCE_A;
+  orderA = new IdOrder();
+  orderB = new IdOrder();
+  batch = new Float64Array(BATCH);
+  batched = 0;
+  proportion;
+  run() {
+    const { a, b, table: table2 } = this;
+    for (; ; ) {
+      if (this.phase === ADVANCE_A) {
+        if (this.hasA) {
+          const r = a.advance();
+          if (r === NEED) return NEED_A;
+          this.hasA = r === ROW;
+        }
+        this.phase = ADVANCE_B;
       }
-    } finally {
-      await again.close();
+      if (this.phase === ADVANCE_B) {
+        if (this.hasB) {
+          const r = b.advance();
+          if (r === NEED) return NEED_B;
+          this.hasB = r === ROW;
+        }
+        this.phase = PAIR;
+      }
+      const hasA = this.hasA;
+      const hasB = this.hasB;
+      if (!hasA && !hasB) return DONE;
+      if (hasA && (this.recorded & BASE) === 0 && !this.orderA.next(a.key, a.keyStart, a.keyLen, a.prevKey, a.prevStart, a.prevLen)) {
+        this.stopped = BASE;
+        return RECORD;
+      }
+      if (hasB && (this.recorded & CAND) === 0 && !this.orderB.next(b.key, b.keyStart, b.keyLen, b.prevKey, b.prevStart, b.prevLen)) {
+        this.stopped = CAND;
+        return RECORD;
+      }
+      let pairs = 0;
+      let x1 = 0;
+      let y1 = 0;
+      let x2 = 0;
+      let y2 = 0;
+      if (hasA && hasB && sameBytes(a.key, a.keyStart, a.keyLen, b.key, b.keyStart, b.keyLen)) {
+        x1 = a.value;
+        y1 = b.value;
+        pairs = 1;
+        if (this.recorded !== 0) {
+          hashId(a.key, a.keyStart, a.keyLen);
+          table2.together(a.key, a.keyStart, a.keyLen, hashed.a);
+        }
+      } else {
+        if (hasA) {
+          hashId(a.key, a.keyStart, a.keyLen);
+          table2.incoming = a.value;
+          if (table2.meet(BASE, a.key, a.keyStart, a.keyLen, hashed.a)) {
+            x1 = a.value;
+            y1 = table2.partner;
+            pairs = 1;
+          }
+        }
+        if (hasB) {
+          hashId(b.key, b.keyStart, b.keyLen);
+          table2.incoming = b.value;
+          if (table2.meet(CAND, b.key, b.keyStart, b.keyLen, hashed.a)) {
+            if (pairs === 0) {
+              x1 = table2.partner;
+              y1 = b.value;
+            } else {
+              x2 = table2.partner;
+              y2 = b.value;
+            }
+            pairs++;
+          }
+        }
+      }
+      for (let k = 0; k < pairs; k++) {
+        const x3 = k === 0 ? x1 : x2;
+        const y = k === 0 ? y1 : y2;
+        this.rows++;
+        if (this.proportion) {
+          if (x3 === 1 && y === 0) this.baselineOnly++;
+          else if (x3 === 0 && y === 1) this.candidateOnly++;
+        } else {
+          const d = y - x3;
+          if (d - d !== 0) this.flushWith(d);
+          this.batch[this.batched++] = d;
+          if (this.batched === BATCH) this.flush();
+        }
+      }
+      this.phase = ADVANCE_A;
     }
   }
-  add(a, b) {
-    if (!this.seen.add(a, b)) this.suspects.add(`${a},${b}`);
+  flush() {
+    const { batch, diffs } = this;
+    for (let i2 = 0; i2 < this.batched; i2++) diffs.push(batch[i2]);
+    this.batched = 0;
   }
-  /** Re-reads the file: a line per repeated id, naming its first line. */
-  async issues() {
-    if (this.suspects.size === 0) return [];
-    const firstLine = /* @__PURE__ */ new Map();
-    const issues2 = [];
-    const lines = new PredictionLines(this.readers(), this.file, this.kind);
-    try {
-      while (await row(lines)) {
-        hashId(lines.key, lines.keyStart, lines.keyLen);
-        if (!this.suspects.has(`${hashed.a},${hashed.b}`)) continue;
-        const id = lines.id();
-        const first = firstLine.get(id);
-        if (first === void 0) firstLine.set(id, lines.line);
-        else
-          issues2.push({
-            file: this.file,
-            pointer: `line ${lines.line}`,
-            expected: `must have a unique id (also on line ${first})`,
-            got: quote(id)
-          });
-      }
-    } finally {
-      await lines.close();
-    }
-    return issues2;
+  flushWith(d) {
+    this.flush();
+    this.diffs.push(d);
   }
 };
 async function pairPredictions(baseline, candidate, kind) {
@@ -46248,58 +46508,53 @@ async function pairPredictions(baseline, candidate, kind) {
   let a = null;
   let b = null;
   try {
-    const baseReaders = await readersOf(baseline, opened);
-    const candReaders = await readersOf(candidate, opened);
-    a = new PredictionLines(baseReaders(), baseline.file, kind);
-    b = new PredictionLines(candReaders(), candidate.file, kind);
-    const baseRepeats = new Repeats(baseReaders, baseline.file, kind);
-    const candRepeats = new Repeats(candReaders, candidate.file, kind);
-    const waiting = new WaitingTable(kind === "continuous");
-    let rows = 0;
-    let baselineOnly = 0;
-    let candidateOnly = 0;
-    const diffs = new RunningStats();
-    const pair = (x2, y) => {
-      rows++;
-      if (kind === "proportion") {
-        if (x2 === 1 && y === 0) baselineOnly++;
-        else if (x2 === 0 && y === 1) candidateOnly++;
-      } else diffs.push(y - x2);
-    };
-    let hasA = await row(a);
-    let hasB = await row(b);
-    while (hasA || hasB) {
-      const together = hasA && hasB && sameBytes(a.key, a.keyStart, a.keyLen, b.key, b.keyStart, b.keyLen);
-      if (together) pair(a.value, b.value);
-      if (hasA) {
-        const needsHash = baseRepeats.needsHash(a);
-        if (needsHash && baseRepeats.seen === null) await baseRepeats.start(a.rows - 1);
-        if (needsHash || !together) hashId(a.key, a.keyStart, a.keyLen);
-        if (needsHash) baseRepeats.add(hashed.a, hashed.b);
-        if (!together && waiting.meet(BASE, a.key, a.keyStart, a.keyLen, hashed.a, a.value))
-          pair(a.value, waiting.partner);
-      }
-      if (hasB) {
-        const needsHash = candRepeats.needsHash(b);
-        if (needsHash && candRepeats.seen === null) await candRepeats.start(b.rows - 1);
-        if (needsHash || !together) hashId(b.key, b.keyStart, b.keyLen);
-        if (needsHash) candRepeats.add(hashed.a, hashed.b);
-        if (!together && waiting.meet(CAND, b.key, b.keyStart, b.keyLen, hashed.a, b.value))
-          pair(waiting.partner, b.value);
-      }
-      if (hasA) {
-        const r = a.advance();
-        hasA = r === NEED ? await refill(a) : r === ROW;
-      }
-      if (hasB) {
-        const r = b.advance();
-        hasB = r === NEED ? await refill(b) : r === ROW;
+    const base = await openFile(baseline, opened);
+    const cand = await openFile(candidate, opened);
+    a = new PredictionLines(base.reader(), baseline.file, kind);
+    b = new PredictionLines(cand.reader(), candidate.file, kind);
+    const table2 = new IdTable(kind === "continuous");
+    const pairing = new Pairing(a, b, table2, kind);
+    for (let r = pairing.run(); r !== DONE; r = pairing.run()) {
+      if (r === NEED_A) await a.fill();
+      else if (r === NEED_B) await b.fill();
+      else {
+        const side = pairing.stopped;
+        if (pairing.recorded === 0) {
+          const estimate = (o, l) => o.size === null || l.consumed === 0 ? 0 : o.size * l.rows / l.consumed;
+          table2.recordAll(Math.max(estimate(base, a), estimate(cand, b)) * 1.05);
+        }
+        const lines = side === BASE ? a : b;
+        const again = new PredictionLines((side === BASE ? base : cand).reader(), lines.file, kind);
+        try {
+          for (let n = lines.rows - 1; n > 0 && await row(again); n--) {
+            hashId(again.key, again.keyStart, again.keyLen);
+            table2.mark(side, again.key, again.keyStart, again.keyLen, hashed.a);
+          }
+        } finally {
+          await again.close();
+        }
+        pairing.recorded |= side;
       }
     }
-    const issues2 = [...await baseRepeats.issues(), ...await candRepeats.issues()];
-    if (issues2.length > 0) throw new InputError(issues2);
-    const unmatched = { baseline: waiting.waitingBase, candidate: waiting.waitingCand };
-    if (kind === "proportion") return { kind, rows, baselineOnly, candidateOnly, unmatched };
+    pairing.flush();
+    if (table2.repeated !== 0) {
+      const issues2 = [];
+      if ((pairing.recorded & BASE) !== 0)
+        issues2.push(...await repeatedIds(base, baseline.file, kind));
+      if ((pairing.recorded & CAND) !== 0)
+        issues2.push(...await repeatedIds(cand, candidate.file, kind));
+      if (issues2.length > 0) throw new InputError(issues2);
+    }
+    const unmatched = { baseline: table2.waitingBase, candidate: table2.waitingCand };
+    const { rows, diffs } = pairing;
+    if (kind === "proportion")
+      return {
+        kind,
+        rows,
+        baselineOnly: pairing.baselineOnly,
+        candidateOnly: pairing.candidateOnly,
+        unmatched
+      };
     return {
       kind,
       rows,

@@ -1,75 +1,406 @@
-// npm run bench: builds bench/bench.ts, runs every variant in its own process (3 rounds, median),
-// and prints ratios of variants measured side by side in this one run, against targets.
-import { execFileSync } from 'node:child_process';
-import { build } from 'esbuild';
+// npm run bench [-- --quick] [-- --turns N]
+//
+// Builds dist/, generates the benchmark data with a fixed seed (bench/generate.mjs) into
+// $TMPDIR/fitgap-bench-<seed> (kept for the next run), and runs each comparison in alternating
+// turns (A, B, A, B, …), every run in its own process, after one untimed warm-up turn. Prints one
+// table of medians, spreads (min–max) and ratios against the targets, floor and peer included, and
+// the machine it ran on. Wall time is what is compared; CPU time (user + sys) and peak RSS come
+// from /usr/bin/time when it exists. --quick leaves out the 10M-row workloads.
+import { spawnSync } from 'node:child_process';
+import { existsSync, mkdtempSync, readFileSync, rmSync, statSync, writeFileSync } from 'node:fs';
+import { cpus, loadavg, tmpdir, totalmem } from 'node:os';
+import { join, resolve } from 'node:path';
+import { performance } from 'node:perf_hooks';
+import { generate, SEED } from '../bench/generate.mjs';
 
-const out = 'node_modules/.cache/fitgap-bench/bench.mjs';
-await build({
-  entryPoints: ['bench/bench.ts'],
-  outfile: out,
-  bundle: true,
-  platform: 'node',
-  format: 'esm',
-  target: 'node20',
-  logLevel: 'warning',
-  banner: {
-    js: "import { createRequire as __r } from 'node:module'; const require = __r(import.meta.url);",
-  },
-});
-execFileSync(process.execPath, [out, 'prepare'], { stdio: 'inherit' });
+const args = process.argv.slice(2);
+const quick = args.includes('--quick');
+const turnsArg = args.indexOf('--turns');
+const TURNS = turnsArg >= 0 ? Number(args[turnsArg + 1]) : 5;
+const ROOT = resolve('.');
+const DATA = join(tmpdir(), `fitgap-bench-${SEED}`);
+const node = process.execPath;
+const TIME = existsSync('/usr/bin/time') ? '/usr/bin/time' : null;
 
-const run = (variant) =>
-  JSON.parse(execFileSync(process.execPath, [out, variant], { encoding: 'utf8' }).trim());
-const median = (xs) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
-const results = {};
-for (let round = 0; round < 3; round++) {
-  for (const v of [
-    'pair-streaming-in-order',
-    'pair-streaming-shuffled',
-    'pair-naive-maps',
-    'curves-epochs-1k',
-    'curves-epochs-100k',
-  ]) {
-    const r = run(v);
-    (results[v] ??= []).push(r);
-  }
+function sh(cmd, argv, options = {}) {
+  const r = spawnSync(cmd, argv, { encoding: 'utf8', ...options });
+  if (r.status !== 0) throw new Error(`${cmd} ${argv.join(' ')} failed: ${r.stderr}`);
+  return r.stdout;
 }
-const ms = (v) => median(results[v].map((r) => r.ms));
-const mb = (v) => median(results[v].map((r) => r.maxRssMb));
 
-console.log('variant                      median ms   peak RSS MB');
-for (const v of Object.keys(results))
-  console.log(`${v.padEnd(28)} ${ms(v).toFixed(0).padStart(9)}   ${mb(v).toFixed(0).padStart(11)}`);
+console.log('building dist/ …');
+sh(node, ['scripts/gen-validators.mjs']);
+sh(node, ['scripts/build.mjs']);
+console.log(`generating data in ${DATA} (seed ${SEED}; kept for the next run) …`);
+generate(DATA, quick ? ['1m'] : ['1m', '10m']);
 
-const targets = [
-  [
-    'pairing 1M rows: streaming time / naive maps time',
-    ms('pair-streaming-in-order') / ms('pair-naive-maps'),
-    1.5,
-  ],
-  [
-    'pairing 1M rows: streaming peak RSS / naive maps peak RSS',
-    mb('pair-streaming-in-order') / mb('pair-naive-maps'),
-    0.6,
-  ],
-  [
-    'pairing 1M rows: shuffled time / in-order time',
-    ms('pair-streaming-shuffled') / ms('pair-streaming-in-order'),
-    2.0,
-  ],
-  [
-    'epoch curve: 100k points time / 1k points time',
-    ms('curves-epochs-100k') / ms('curves-epochs-1k'),
-    150,
-  ],
+/** A Python with pandas and scipy: the peer runs there, or is skipped. */
+function findPython() {
+  for (const py of ['python3', '/usr/bin/python3']) {
+    const r = spawnSync(
+      py,
+      ['-c', 'import pandas, scipy; print(pandas.__version__, scipy.__version__)'],
+      {
+        encoding: 'utf8',
+      },
+    );
+    if (r.status === 0) return { py, versions: r.stdout.trim() };
+  }
+  return null;
+}
+const python = findPython();
+
+const scratch = mkdtempSync(join(tmpdir(), 'fitgap-bench-run-'));
+writeFileSync(join(scratch, 'event.json'), '{}');
+const actionEnv = {
+  PATH: process.env.PATH ?? '',
+  GITHUB_ACTIONS: 'true',
+  GITHUB_EVENT_NAME: 'push',
+  GITHUB_EVENT_PATH: join(scratch, 'event.json'),
+  GITHUB_REPOSITORY: 'crumb/eta',
+  // Nothing is sent: no pull request, comment and status check off.
+  GITHUB_API_URL: 'http://127.0.0.1:9',
+  GITHUB_SHA: 'b3e51a0b3e51a0b3e51a0b3e51a0b3e51a0b3e51',
+  GITHUB_WORKSPACE: DATA,
+  GITHUB_OUTPUT: join(scratch, 'output'),
+  GITHUB_STEP_SUMMARY: join(scratch, 'summary'),
+  RUNNER_TEMP: scratch,
+  INPUT_MODE: 'review',
+  INPUT_CANDIDATE: 'tiny-candidate.json',
+  INPUT_BASELINE: 'tiny-baseline.json',
+  'INPUT_GITHUB-TOKEN': 'unused',
+  INPUT_COMMENT: 'off',
+  'INPUT_COMMENT-KEY': 'default',
+  'INPUT_STATUS-CHECK': 'off',
+  'INPUT_REPORT-ARTIFACT': 'fitgap-report',
+  'INPUT_ARCHIVE-LIMIT-MB': '50',
+};
+
+const cli = (b, c) => [
+  node,
+  join(ROOT, 'dist/cli.js'),
+  'review',
+  '--baseline',
+  b,
+  '--candidate',
+  c,
 ];
-console.log('\nratio (measured side by side in this run)                      value   target');
-let failed = 0;
-for (const [label, value, limit] of targets) {
-  const ok = value <= limit;
-  if (!ok) failed++;
-  console.log(
-    `${label.padEnd(60)} ${value.toFixed(2).padStart(7)}   <= ${limit}  ${ok ? 'ok' : 'MISSED'}`,
+const floor = (...files) => [node, join(ROOT, 'bench/floor-lines.mjs'), ...files];
+const peer = (b, c) => (python === null ? null : [python.py, join(ROOT, 'bench/peer.py'), b, c]);
+
+const workloads = {
+  'fitgap 1M': cli('baseline-1m.json', 'candidate-1m.json'),
+  'fitgap 1M shuffled': cli('baseline-1m.json', 'candidate-1m-shuffled.json'),
+  'fitgap 1M loss': cli('baseline-1m-loss.json', 'candidate-1m-loss.json'),
+  'fitgap 10M': cli('baseline-10m.json', 'candidate-10m.json'),
+  'fitgap 10M shuffled': cli('baseline-10m.json', 'candidate-10m-shuffled.json'),
+  'floor 1M': floor('base-1m.csv', 'cand-1m.csv'),
+  'floor 1M shuffled': floor('base-1m.csv', 'cand-1m-shuffled.csv'),
+  'floor 10M': floor('base-10m.csv', 'cand-10m.csv'),
+  'peer 1M': peer('base-1m.csv', 'cand-1m.csv'),
+  'peer 1M shuffled': peer('base-1m.csv', 'cand-1m-shuffled.csv'),
+  'fitgap start-up (CLI)': cli('tiny-baseline.json', 'tiny-candidate.json'),
+  'fitgap start-up (action)': [node, join(ROOT, 'dist/index.js')],
+  "node -e ''": [node, '-e', ''],
+  'fitgap curve 1M': cli('tiny-baseline.json', 'candidate-curve-1m.json'),
+  'floor curve 1M': [node, join(ROOT, 'bench/floor-json.mjs'), 'candidate-curve-1m.json'],
+};
+
+/** One run in its own process: wall ms (measured here), CPU ms and peak RSS MB (/usr/bin/time). */
+function measure(name) {
+  const argv = workloads[name];
+  const action = name.includes('(action)');
+  if (action) for (const f of ['output', 'summary']) writeFileSync(join(scratch, f), '');
+  const out = join(scratch, 'time');
+  const [cmd, ...rest] = TIME === null ? argv : [TIME, '-f', '%U %S %M', '-o', out, ...argv];
+  const start = performance.now();
+  const r = spawnSync(cmd, rest, {
+    cwd: DATA,
+    stdio: ['ignore', 'ignore', 'pipe'],
+    encoding: 'utf8',
+    ...(action ? { env: actionEnv } : {}),
+  });
+  const wall = performance.now() - start;
+  // fitgap exits 1 when the gate fails; that is a finished review.
+  if (r.status !== 0 && !(r.status === 1 && name.startsWith('fitgap')))
+    throw new Error(`${name} exited ${r.status}: ${r.stderr}`);
+  if (TIME === null) return { wall, cpu: NaN, rss: NaN };
+  const [user, sys, kb] = readFileSync(out, 'utf8').trim().split('\n').pop().split(' ').map(Number);
+  return { wall, cpu: (user + sys) * 1000, rss: kb / 1024 };
+}
+
+const groups = [
+  { key: 'inorder', members: ['fitgap 1M', 'floor 1M', 'peer 1M'], turns: TURNS },
+  {
+    key: 'shuffled',
+    members: ['fitgap 1M shuffled', 'floor 1M shuffled', 'peer 1M shuffled'],
+    turns: TURNS,
+  },
+  { key: 'loss', members: ['fitgap 1M loss', 'fitgap 1M'], turns: TURNS + 2 },
+  {
+    key: 'startup',
+    members: ['fitgap start-up (CLI)', 'fitgap start-up (action)', "node -e ''"],
+    turns: 2 * TURNS + 1,
+  },
+  { key: 'curve', members: ['fitgap curve 1M', 'floor curve 1M'], turns: TURNS },
+  ...(quick
+    ? []
+    : [
+        { key: '10m', members: ['fitgap 10M', 'fitgap 1M', 'floor 10M'], turns: 3 },
+        { key: '10m-shuffled', members: ['fitgap 10M shuffled', 'fitgap 1M shuffled'], turns: 3 },
+      ]),
+];
+
+const results = {};
+const loads = [];
+for (const group of groups) {
+  const members = group.members.filter((m) => workloads[m] !== null);
+  process.stdout.write(`${group.key}: ${members.join(' / ')} × ${group.turns} `);
+  loads.push(loadavg()[0]);
+  for (const m of members) measure(m); // warm-up: page cache, not timed
+  const samples = (results[group.key] = Object.fromEntries(members.map((m) => [m, []])));
+  for (let turn = 0; turn < group.turns; turn++) {
+    for (const m of members) samples[m].push(measure(m));
+    process.stdout.write('.');
+  }
+  loads.push(loadavg()[0]);
+  process.stdout.write('\n');
+}
+
+// fitgap and the peer must agree on the paired test they both ran (checked once, not timed).
+function agreement() {
+  if (python === null) return 'peer skipped';
+  const notes = [];
+  for (const [b, c, pb, pc] of [
+    ['baseline-1m.json', 'candidate-1m.json', 'base-1m.csv', 'cand-1m.csv'],
+    ['baseline-1m.json', 'candidate-1m-shuffled.json', 'base-1m.csv', 'cand-1m-shuffled.csv'],
+  ]) {
+    const ours = JSON.parse(
+      spawnSync(
+        node,
+        [
+          join(ROOT, 'dist/cli.js'),
+          'review',
+          '--baseline',
+          b,
+          '--candidate',
+          c,
+          '--format',
+          'json',
+        ],
+        {
+          cwd: DATA,
+          encoding: 'utf8',
+        },
+      ).stdout,
+    ).paired;
+    const theirs = JSON.parse(sh(python.py, [join(ROOT, 'bench/peer.py'), pb, pc], { cwd: DATA }));
+    const same =
+      ours.rows === theirs.rows &&
+      ours.discordant.baselineOnly === theirs.baselineOnly &&
+      ours.discordant.candidateOnly === theirs.candidateOnly;
+    notes.push(`${c}: ${same ? 'same' : 'DIFFERENT'} pairs and discordant counts`);
+  }
+  return notes.join('; ');
+}
+const agreed = agreement();
+rmSync(scratch, { recursive: true, force: true });
+
+const median = (xs) => {
+  const s = [...xs].sort((a, b) => a - b);
+  const h = Math.floor(s.length / 2);
+  return s.length % 2 === 1 ? s[h] : (s[h - 1] + s[h]) / 2;
+};
+const stat = (group, name, field = 'wall') => {
+  const xs = results[group]?.[name]?.map((r) => r[field]);
+  return xs === undefined ? null : { med: median(xs), min: Math.min(...xs), max: Math.max(...xs) };
+};
+const secs = (ms) => (ms >= 10000 ? `${(ms / 1000).toFixed(1)} s` : `${(ms / 1000).toFixed(2)} s`);
+const cell = (group, name) => {
+  const w = stat(group, name);
+  if (w === null) return 'skipped';
+  const cpu = stat(group, name, 'cpu');
+  const rss = stat(group, name, 'rss');
+  return `${secs(w.med)} (${secs(w.min)}–${secs(w.max)}); CPU ${Number.isNaN(cpu.med) ? 'n/a' : secs(cpu.med)}; ${Number.isNaN(rss.med) ? 'n/a' : `${rss.med.toFixed(0)} MB`}`;
+};
+const ratio = (group, a, b, field = 'wall') => {
+  const x = stat(group, a, field);
+  const y = stat(group, b, field);
+  return x === null || y === null ? NaN : x.med / y.med;
+};
+const times = (r) => (Number.isNaN(r) ? 'n/a' : `${r.toFixed(2)}×`);
+const verdict = (ok) =>
+  typeof ok === 'string' ? ok : ok === null ? 'skipped' : ok ? 'ok' : 'MISSED';
+
+const rows = [];
+const row = (comparison, ours, ref, value, cpuValue, target, ok) =>
+  rows.push([comparison, ours, ref, value, cpuValue, target, verdict(ok)]);
+
+{
+  const r = ratio('inorder', 'fitgap 1M', 'floor 1M');
+  row(
+    'paired review, 2 × 1M `id,correct`, ids in order, vs floor',
+    cell('inorder', 'fitgap 1M'),
+    `floor: ${cell('inorder', 'floor 1M')}`,
+    times(r),
+    times(ratio('inorder', 'fitgap 1M', 'floor 1M', 'cpu')),
+    '≤ 1.5× (must: ≤ 2.5×)',
+    r <= 1.5 ? 'ok' : r <= 2.5 ? 'MISSED 1.5×; must met' : 'MISSED',
   );
 }
-process.exitCode = failed > 0 ? 1 : 0;
+if (python !== null) {
+  const r = ratio('inorder', 'peer 1M', 'fitgap 1M');
+  const rss = stat('inorder', 'fitgap 1M', 'rss')?.med ?? NaN;
+  row(
+    'the same vs the peer (pandas read + merge, scipy exact binomial)',
+    cell('inorder', 'fitgap 1M'),
+    `peer: ${cell('inorder', 'peer 1M')}`,
+    `${r.toFixed(1)}× faster`,
+    `${ratio('inorder', 'peer 1M', 'fitgap 1M', 'cpu').toFixed(1)}× less`,
+    '≥ 6× faster; peak RSS ≤ 150 MB',
+    r >= 6 && !(rss > 150),
+  );
+} else
+  row(
+    'the same vs the peer',
+    cell('inorder', 'fitgap 1M'),
+    'peer skipped: no python3 with pandas and scipy',
+    'n/a',
+    'n/a',
+    '≥ 6× faster; peak RSS ≤ 150 MB',
+    null,
+  );
+{
+  const r = ratio('shuffled', 'fitgap 1M shuffled', 'floor 1M shuffled');
+  row(
+    'candidate ids shuffled, 1M, vs floor',
+    cell('shuffled', 'fitgap 1M shuffled'),
+    `floor: ${cell('shuffled', 'floor 1M shuffled')}`,
+    times(r),
+    times(ratio('shuffled', 'fitgap 1M shuffled', 'floor 1M shuffled', 'cpu')),
+    '≤ 4×',
+    r <= 4,
+  );
+  if (python !== null)
+    row(
+      'the same vs the peer (no target)',
+      cell('shuffled', 'fitgap 1M shuffled'),
+      `peer: ${cell('shuffled', 'peer 1M shuffled')}`,
+      `${ratio('shuffled', 'peer 1M shuffled', 'fitgap 1M shuffled').toFixed(1)}× faster`,
+      `${ratio('shuffled', 'peer 1M shuffled', 'fitgap 1M shuffled', 'cpu').toFixed(1)}× less`,
+      '',
+      true,
+    );
+}
+{
+  const r = ratio('loss', 'fitgap 1M loss', 'fitgap 1M');
+  row(
+    '`id,loss` (paired t) vs `id,correct`, 1M',
+    cell('loss', 'fitgap 1M loss'),
+    `correct: ${cell('loss', 'fitgap 1M')}`,
+    times(r),
+    times(ratio('loss', 'fitgap 1M loss', 'fitgap 1M', 'cpu')),
+    '≤ 1.3×',
+    r <= 1.3,
+  );
+}
+if (!quick) {
+  const r = ratio('10m', 'fitgap 10M', 'fitgap 1M');
+  const rss = stat('10m', 'fitgap 10M', 'rss')?.med ?? NaN;
+  row(
+    '10M per side, ids in order, vs 1M',
+    cell('10m', 'fitgap 10M'),
+    `1M: ${cell('10m', 'fitgap 1M')}`,
+    times(r),
+    times(ratio('10m', 'fitgap 10M', 'fitgap 1M', 'cpu')),
+    '≤ 11×; peak RSS ≤ 300 MB',
+    r <= 11 && !(rss > 300),
+  );
+  row(
+    '10M in order vs floor (no target)',
+    cell('10m', 'fitgap 10M'),
+    `floor: ${cell('10m', 'floor 10M')}`,
+    times(ratio('10m', 'fitgap 10M', 'floor 10M')),
+    times(ratio('10m', 'fitgap 10M', 'floor 10M', 'cpu')),
+    '',
+    true,
+  );
+  const s = ratio('10m-shuffled', 'fitgap 10M shuffled', 'fitgap 1M shuffled');
+  const srss = stat('10m-shuffled', 'fitgap 10M shuffled', 'rss')?.med ?? NaN;
+  row(
+    '10M per side, candidate shuffled, vs 1M shuffled',
+    cell('10m-shuffled', 'fitgap 10M shuffled'),
+    `1M: ${cell('10m-shuffled', 'fitgap 1M shuffled')}`,
+    times(s),
+    times(ratio('10m-shuffled', 'fitgap 10M shuffled', 'fitgap 1M shuffled', 'cpu')),
+    '≤ 11×; peak RSS ≤ 600 MB',
+    s <= 11 && !(srss > 600),
+  );
+}
+for (const entry of ['CLI', 'action']) {
+  const name = `fitgap start-up (${entry})`;
+  const plus = stat('startup', name).med - stat('startup', "node -e ''").med;
+  const cpuPlus = stat('startup', name, 'cpu').med - stat('startup', "node -e ''", 'cpu').med;
+  row(
+    `start-up: ${entry} reviewing two small artifacts vs \`node -e ''\``,
+    cell('startup', name),
+    `node -e '': ${cell('startup', "node -e ''")}`,
+    `+${plus.toFixed(0)} ms`,
+    Number.isNaN(cpuPlus) ? 'n/a' : `+${cpuPlus.toFixed(0)} ms`,
+    '≤ +80 ms',
+    plus <= 80,
+  );
+}
+{
+  const r = ratio('curve', 'fitgap curve 1M', 'floor curve 1M');
+  row(
+    'epoch curve of 1M points (validate, analyse, downsample) vs `JSON.parse` of the file',
+    cell('curve', 'fitgap curve 1M'),
+    `JSON.parse: ${cell('curve', 'floor curve 1M')}`,
+    times(r),
+    times(ratio('curve', 'fitgap curve 1M', 'floor curve 1M', 'cpu')),
+    '≤ 1.5×',
+    r <= 1.5,
+  );
+}
+{
+  const size = statSync('dist/index.js').size;
+  const cliSize = statSync('dist/cli.js').size;
+  row(
+    '`dist/index.js` size',
+    `${(size / 1e6).toFixed(2)} MB`,
+    `dist/cli.js: ${(cliSize / 1e6).toFixed(2)} MB`,
+    '',
+    '',
+    '≤ 1.5 MB',
+    size <= 1.5e6,
+  );
+}
+
+const header = [
+  'comparison',
+  'fitgap: median (min–max); CPU; peak RSS',
+  'reference',
+  'ratio',
+  'CPU ratio',
+  'target',
+  '',
+];
+console.log('');
+console.log(`| ${header.join(' | ')} |`);
+console.log(`|${header.map(() => '---').join('|')}|`);
+for (const r of rows) console.log(`| ${r.join(' | ')} |`);
+console.log('');
+const mem = (totalmem() / 2 ** 30).toFixed(1);
+console.log(
+  `Machine: ${cpus().length} CPUs (${cpus()[0]?.model ?? 'unknown'}), ${mem} GiB, Node ${process.version}` +
+    `${python === null ? ', no pandas/scipy' : `, ${python.py} with pandas ${python.versions.replace(' ', ', scipy ')}`}.`,
+);
+console.log(
+  `Load average (1 min) at the start and end of each group: ${loads.map((l) => l.toFixed(1)).join(', ')}.`,
+);
+console.log(
+  `Turns: ${groups.map((g) => `${g.key} ${g.turns}`).join(', ')} (after one warm-up turn each).`,
+);
+console.log(`Agreement with the peer: ${agreed}.`);
+console.log(`Command: npm run bench${args.length > 0 ? ` -- ${args.join(' ')}` : ''}`);

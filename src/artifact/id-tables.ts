@@ -1,8 +1,7 @@
 /**
  * Flat tables keyed on the bytes of prediction ids, for pairing millions of rows without a string
- * or an object per row: a 64-bit hash of an id, a check that ids keep increasing (then no id can
- * repeat and nothing needs remembering), a set of id hashes for files whose ids do not, and an
- * open-addressing table of the rows still waiting for their partner.
+ * or an object per row: a hash of an id, a check that ids keep increasing (then no id can repeat
+ * and nothing needs remembering), an open-addressing table of ids, and a set of 64-bit hashes.
  */
 
 /** The two 32-bit words of the last `hashId` (a and b; a picks the slot). */
@@ -122,176 +121,276 @@ export class HashSet64 {
   }
 }
 
-export const BASE = 0;
-export const CAND = 1;
-
-/** Ids up to this many bytes are stored inline in the waiting table; longer ones in a Map. */
+/** Which file an id came from (bits of an entry). */
+export const BASE = 1;
+export const CAND = 2;
+const BOTH = 3;
+/** Entry bit: the value (0/1) of a waiting proportion row. */
+const ONE = 4;
+const BITS = 3; // entry word: len << BITS | ONE? | CAND? | BASE?
+/** Ids up to this many bytes are stored inline; longer ones (rare) in a Map. */
 export const INLINE_ID_BYTES = 64;
 
 /**
- * Rows waiting for their partner, keyed on the id bytes (stored inline, fixed width per table,
- * widened up to INLINE_ID_BYTES when a longer id arrives), with the side they came from and their
- * value. Linear probing with backward-shift deletion (no tombstones), so a table that fills and
- * drains stays fast. Proportion values (0/1) live in the tag byte; losses in a Float64Array. Longer
- * ids (rare) wait in a Map keyed on their bytes as a latin1 string.
+ * The ids of both files, keyed on their bytes: open addressing with linear probing, each slot one
+ * run of 32-bit words (hash, length and bits, then the id bytes inline at a fixed width that widens
+ * up to INLINE_ID_BYTES), so that a probe reads one cache line. An entry's bits say which files
+ * have the id: one bit, a row waiting for its partner (with its value); both, a pair.
+ *
+ * While both files' ids keep increasing, only waiting rows are kept and a pair deletes its entry
+ * (backward-shift deletion, no tombstones). From the first id out of order (`recordAll`) every id
+ * is kept, so that an id a file has already had is seen again: `repeated` gets that file's bit.
+ * The rows are those of the original reader's two Maps: a row whose id waits from the other file
+ * pairs with it; otherwise it waits, replacing a waiting row of its own file with the same id.
  */
-export class WaitingTable {
-  /** Rows waiting, per side. */
+export class IdTable {
+  /** Rows waiting, per file. */
   waitingBase = 0;
   waitingCand = 0;
-  /** The partner's value after `meet` returned true. */
+  /** Files (BASE | CAND) with an id seen twice. */
+  repeated = 0;
+  /** The value of the row `meet` paired with. */
   partner = 0;
+  /** The value of the arriving row, for `meet` (a field: a double argument would be boxed). */
+  incoming = 0;
+  private recording = false;
   private cap: number;
   private mask: number;
   private width = 16;
+  private stride = 2 + 16 / 4;
   private count = 0;
-  private hashes: Uint32Array;
-  /** Id length; 0 marks an empty slot (ids are never empty). */
-  private lens: Int32Array;
-  private tags: Uint8Array;
-  private keys: Uint8Array;
+  private words: Uint32Array;
+  private bytes: Uint8Array;
   private values: Float64Array | null;
-  private readonly long = new Map<string, { side: number; value: number }>();
+  private readonly long = new Map<string, { bits: number; value: number }>();
 
   /** `losses`: values are numbers, not 0/1. `slots`: initial capacity, a power of two. */
-  constructor(losses: boolean, slots = 1 << 12) {
+  constructor(
+    private readonly losses: boolean,
+    slots = 1 << 12,
+  ) {
     this.cap = slots;
     this.mask = slots - 1;
-    this.hashes = new Uint32Array(slots);
-    this.lens = new Int32Array(slots);
-    this.tags = new Uint8Array(slots);
-    this.keys = new Uint8Array(slots * this.width);
+    this.words = new Uint32Array(slots * this.stride);
+    this.bytes = new Uint8Array(this.words.buffer);
     this.values = losses ? new Float64Array(slots) : null;
   }
 
+  /** Keep every id from now on; `expected`: about how many distinct ids will come. */
+  recordAll(expected: number): void {
+    this.recording = true;
+    this.reserve(expected);
+  }
+
   /**
-   * A row of `side` arrives. When its id waits from the other side, that row leaves the table and
-   * its value is in `partner` (true). Otherwise the row waits, replacing a row of the same side
-   * and id (false). `hash` is `hashed.a` of the id.
+   * A row of `side` out of step with the other file: pairs with a waiting row of the other file
+   * (true; its value in `partner`) or waits (false). `incoming` holds the row's value.
    */
-  meet(
-    side: number,
-    key: Buffer,
-    start: number,
-    len: number,
-    hash: number,
-    value: number,
-  ): boolean {
-    if (len > INLINE_ID_BYTES)
-      return this.meetLong(side, key.toString('latin1', start, start + len), value);
-    if (len > this.width || (this.count + 1) * 10 > this.cap * 7) {
-      let width = this.width;
-      while (width < len) width *= 2;
-      this.rebuild((this.count + 1) * 10 > this.cap * 7 ? this.cap * 2 : this.cap, width);
+  meet(side: number, key: Uint8Array, start: number, len: number, hash: number): boolean {
+    if (len > INLINE_ID_BYTES) return this.longMeet(side, key, start, len);
+    const slot = this.find(key, start, len, hash);
+    if (slot < 0) {
+      this.insert(~slot, key, start, len, hash, side);
+      return false;
     }
-    const { lens, hashes, keys, tags, width, mask } = this;
+    const at = slot * this.stride + 1;
+    const word = this.words[at] as number;
+    const bits = word & BOTH;
+    if ((bits & side) !== 0) {
+      this.repeated |= side;
+      if (bits === side) this.store(slot, at, word, side); // the old Map.set: replace the value
+      return false;
+    }
+    this.partner = this.values === null ? (word & ONE) >>> 2 : (this.values[slot] as number);
+    this.count1(bits, -1);
+    if (this.recording) this.words[at] = (word & ~(ONE | BOTH)) | BOTH;
+    else this.remove(slot);
+    return true;
+  }
+
+  /** Rows of both files with this id, in step (only while recording). */
+  together(key: Uint8Array, start: number, len: number, hash: number): void {
+    if (len > INLINE_ID_BYTES) {
+      const id = Buffer.from(key.buffer, key.byteOffset, key.byteLength).toString(
+        'latin1',
+        start,
+        start + len,
+      );
+      const entry = this.long.get(id);
+      if (entry === undefined) this.long.set(id, { bits: BOTH, value: 0 });
+      else {
+        this.repeated |= entry.bits;
+        entry.bits = BOTH;
+      }
+      return;
+    }
+    const slot = this.find(key, start, len, hash);
+    if (slot < 0) this.insert(~slot, key, start, len, hash, BOTH);
+    else {
+      const at = slot * this.stride + 1;
+      this.repeated |= (this.words[at] as number) & BOTH;
+    }
+  }
+
+  /**
+   * An id of `side` read before `recordAll` (re-read from the file's start): it paired then unless
+   * it still waits. Waiting from the other file, though, means that file has it twice.
+   */
+  mark(side: number, key: Uint8Array, start: number, len: number, hash: number): void {
+    if (len > INLINE_ID_BYTES) {
+      const id = Buffer.from(key.buffer, key.byteOffset, key.byteLength).toString(
+        'latin1',
+        start,
+        start + len,
+      );
+      const entry = this.long.get(id);
+      if (entry === undefined) this.long.set(id, { bits: BOTH, value: 0 });
+      else if ((entry.bits & side) === 0) this.repeated |= entry.bits;
+      return;
+    }
+    const slot = this.find(key, start, len, hash);
+    if (slot < 0) this.insert(~slot, key, start, len, hash, BOTH);
+    else {
+      const bits = (this.words[slot * this.stride + 1] as number) & BOTH;
+      if ((bits & side) === 0) this.repeated |= bits;
+    }
+  }
+
+  private longMeet(side: number, key: Uint8Array, start: number, len: number): boolean {
+    const id = Buffer.from(key.buffer, key.byteOffset, key.byteLength).toString(
+      'latin1',
+      start,
+      start + len,
+    );
+    const entry = this.long.get(id);
+    if (entry === undefined) {
+      this.long.set(id, { bits: side, value: this.incoming });
+      this.count1(side, 1);
+      return false;
+    }
+    if ((entry.bits & side) !== 0) {
+      this.repeated |= side;
+      if (entry.bits === side) entry.value = this.incoming;
+      return false;
+    }
+    this.partner = entry.value;
+    this.count1(entry.bits, -1);
+    if (this.recording) entry.bits = BOTH;
+    else this.long.delete(id);
+    return true;
+  }
+
+  /** Slot of the id, or ~slot where it would go. */
+  private find(key: Uint8Array, start: number, len: number, hash: number): number {
+    if (len > this.width || (this.count + 1) * 10 > this.cap * 7) this.grow(len);
+    const { words, bytes, stride, mask } = this;
     let i = hash & mask;
     for (;;) {
-      const l = lens[i] as number;
-      if (l === 0) break;
-      if (l === len && hashes[i] === hash) {
-        let at = i * width;
+      const at = i * stride;
+      const word = words[at + 1] as number;
+      if (word === 0) return ~i;
+      if (word >>> BITS === len && words[at] === hash) {
+        let b = (at + 2) * 4;
         let k = start;
         const stop = start + len;
-        while (k < stop && keys[at] === key[k]) {
-          at++;
+        while (k < stop && bytes[b] === key[k]) {
+          b++;
           k++;
         }
-        if (k === stop) {
-          const tag = tags[i] as number;
-          if ((tag & 1) !== side) {
-            this.partner = this.values === null ? tag >> 1 : (this.values[i] as number);
-            this.remove(i, tag & 1);
-            return true;
-          }
-          this.store(i, side, value);
-          return false;
-        }
+        if (k === stop) return i;
       }
       i = (i + 1) & mask;
     }
+  }
+
+  private insert(
+    slot: number,
+    key: Uint8Array,
+    start: number,
+    len: number,
+    hash: number,
+    bits: number,
+  ): void {
+    const at = slot * this.stride;
+    this.words[at] = hash;
+    const bytes = this.bytes;
+    for (let k = 0, b = (at + 2) * 4; k < len; k++) bytes[b + k] = key[start + k] as number;
     this.count++;
-    if (side === BASE) this.waitingBase++;
-    else this.waitingCand++;
-    hashes[i] = hash;
-    lens[i] = len;
-    for (let k = 0, at = i * width; k < len; k++) keys[at + k] = key[start + k] as number;
-    this.store(i, side, value);
-    return false;
+    if (bits === BOTH) this.words[at + 1] = (len << BITS) | BOTH;
+    else this.store(slot, at + 1, len << BITS, bits);
   }
 
-  private meetLong(side: number, id: string, value: number): boolean {
-    const waiting = this.long.get(id);
-    if (waiting !== undefined && waiting.side !== side) {
-      this.partner = waiting.value;
-      this.long.delete(id);
-      if (waiting.side === BASE) this.waitingBase--;
-      else this.waitingCand--;
-      return true;
-    }
-    if (waiting === undefined) {
-      if (side === BASE) this.waitingBase++;
-      else this.waitingCand++;
-    }
-    this.long.set(id, { side, value });
-    return false;
-  }
-
-  private store(i: number, side: number, value: number): void {
-    if (this.values === null) this.tags[i] = side | (value << 1);
+  /** Makes the entry at `slot` a waiting row of `side` with the incoming value. */
+  private store(slot: number, at: number, word: number, side: number): void {
+    const base = (word & ~(ONE | BOTH)) | side;
+    if (this.values === null) this.words[at] = this.incoming === 1 ? base | ONE : base;
     else {
-      this.tags[i] = side;
-      this.values[i] = value;
+      this.words[at] = base;
+      this.values[slot] = this.incoming;
     }
+    if ((word & BOTH) !== side) this.count1(side, 1);
   }
 
-  private remove(slot: number, side: number): void {
-    const { lens, hashes, tags, keys, values, width, mask } = this;
-    if (side === BASE) this.waitingBase--;
-    else this.waitingCand--;
+  private count1(bits: number, by: number): void {
+    if (bits === BASE) this.waitingBase += by;
+    else if (bits === CAND) this.waitingCand += by;
+  }
+
+  private remove(slot: number): void {
+    const { words, values, stride, mask } = this;
     this.count--;
     let i = slot;
     let j = slot;
     for (;;) {
       j = (j + 1) & mask;
-      const l = lens[j] as number;
-      if (l === 0) break;
-      const home = (hashes[j] as number) & mask;
+      const word = words[j * stride + 1] as number;
+      if (word === 0) break;
+      const home = (words[j * stride] as number) & mask;
       // Leave j where it is when its home slot lies cyclically in (i, j].
       if (i <= j ? i < home && home <= j : i < home || home <= j) continue;
-      hashes[i] = hashes[j] as number;
-      lens[i] = l;
-      tags[i] = tags[j] as number;
+      words.copyWithin(i * stride, j * stride, j * stride + stride);
       if (values !== null) values[i] = values[j] as number;
-      for (let k = 0; k < l; k++) keys[i * width + k] = keys[j * width + k] as number;
       i = j;
     }
-    lens[i] = 0;
+    words[i * stride + 1] = 0;
+  }
+
+  /** Room for `n` entries at a load of at most 0.7. */
+  private reserve(n: number): void {
+    let cap = this.cap;
+    while (n * 10 > cap * 7) cap *= 2;
+    if (cap > this.cap) this.rebuild(cap, this.width);
+  }
+
+  private grow(len: number): void {
+    let width = this.width;
+    while (width < len) width *= 2;
+    const cap = (this.count + 1) * 10 > this.cap * 7 ? this.cap * 2 : this.cap;
+    this.rebuild(cap, width);
   }
 
   private rebuild(cap: number, width: number): void {
-    const { lens, hashes, tags, keys, values } = this;
-    const oldWidth = this.width;
-    const oldCap = this.cap;
+    const { words, values, stride, cap: oldCap } = this;
     this.cap = cap;
     this.mask = cap - 1;
     this.width = width;
-    this.hashes = new Uint32Array(cap);
-    this.lens = new Int32Array(cap);
-    this.tags = new Uint8Array(cap);
-    this.keys = new Uint8Array(cap * width);
+    this.stride = 2 + width / 4;
+    this.words = new Uint32Array(cap * this.stride);
+    this.bytes = new Uint8Array(this.words.buffer);
     this.values = values === null ? null : new Float64Array(cap);
+    const keyWords = stride - 2;
     for (let s = 0; s < oldCap; s++) {
-      const l = lens[s] as number;
-      if (l === 0) continue;
-      const h = hashes[s] as number;
-      let i = h & this.mask;
-      while (this.lens[i] !== 0) i = (i + 1) & this.mask;
-      this.hashes[i] = h;
-      this.lens[i] = l;
-      this.tags[i] = tags[s] as number;
+      const word = words[s * stride + 1] as number;
+      if (word === 0) continue;
+      const hash = words[s * stride] as number;
+      let i = hash & this.mask;
+      while (this.words[i * this.stride + 1] !== 0) i = (i + 1) & this.mask;
+      const at = i * this.stride;
+      this.words[at] = hash;
+      this.words[at + 1] = word;
+      for (let w = 0; w < keyWords; w++)
+        this.words[at + 2 + w] = words[s * stride + 2 + w] as number;
       if (this.values !== null && values !== null) this.values[i] = values[s] as number;
-      for (let k = 0; k < l; k++) this.keys[i * width + k] = keys[s * oldWidth + k] as number;
     }
   }
 }

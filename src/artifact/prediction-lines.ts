@@ -18,6 +18,7 @@
 import type { FileHandle } from 'node:fs/promises';
 import type { MetricKind } from './types.js';
 import { InputError, quote } from '../errors.js';
+import { decimalToDouble, decoded } from './decimal.js';
 
 export const CHUNK = 1 << 20;
 /** `advance()` results. */
@@ -77,9 +78,6 @@ export function iterableReader(make: () => AsyncIterable<Uint8Array>): ByteReade
 }
 
 const HEADER: Record<MetricKind, string> = { proportion: 'id,correct', continuous: 'id,loss' };
-const TWO_53 = 9007199254740992;
-/** Exact powers of ten (10^0 … 10^22 are exact doubles). */
-const POW10 = Array.from({ length: 23 }, (_, i) => Number(`1e${i}`));
 
 function valueError(kind: MetricKind, file: string, line: number, raw: string): InputError {
   const column = kind === 'proportion' ? 'correct' : 'loss';
@@ -121,6 +119,8 @@ export class PredictionLines {
 
   private buf: Buffer = Buffer.allocUnsafe(CHUNK);
   private pos = 0;
+  /** Bytes before `buf[0]`. */
+  private dropped = 0;
   private end = 0;
   private eof = false;
   private pending: string[] | null = null;
@@ -143,6 +143,7 @@ export class PredictionLines {
   /** Reads more bytes after `advance()` returned NEED (keeps the unread part of the buffer). */
   async fill(): Promise<void> {
     if (this.key === this.buf) this.save();
+    this.dropped += this.pos;
     const rest = this.end - this.pos;
     if (rest === this.buf.length) {
       // A line longer than the buffer: grow it.
@@ -228,9 +229,7 @@ export class PredictionLines {
   /**
    * Reads a plain decimal (`-?D+(.D+)?([eE][+-]?D+)?`) followed by `\n` from `p`; sets `value` and
    * returns the index after the newline, or −1 for anything else (the line takes the string path).
-   * Exact: up to 16 digits below 2^53 with |exponent| ≤ 22 is one correctly rounded operation on
-   * two exact doubles (Clinger 1990, "How to read floating point numbers accurately", PLDI); other
-   * plain decimals go through `Number()` of the same characters.
+   * The value is what `Number()` gives for the same text: decimal.ts, or `Number()` itself.
    */
   private number(from: number): number {
     const buf = this.buf;
@@ -239,29 +238,35 @@ export class PredictionLines {
     let c = p < end ? (buf[p] as number) : -1;
     const negative = c === 45;
     if (negative) c = ++p < end ? (buf[p] as number) : -1;
-    let m = 0;
-    let digits = 0;
-    let intDigits = 0;
-    while (c >= 48 && c <= 57) {
-      m = m * 10 + (c - 48);
-      if (m !== 0) digits++;
-      intDigits++;
-      c = ++p < end ? (buf[p] as number) : -1;
-    }
-    if (intDigits === 0) return -1;
-    let scale = 0;
-    if (c === 46) {
-      c = ++p < end ? (buf[p] as number) : -1;
-      let fraction = 0;
-      while (c >= 48 && c <= 57) {
-        m = m * 10 + (c - 48);
-        if (m !== 0) digits++;
-        fraction++;
-        c = ++p < end ? (buf[p] as number) : -1;
+    // The first 15 significant digits in hi, the next ones (up to 4 are used) in lo.
+    let hi = 0;
+    let lo = 0;
+    let loDigits = 0;
+    const intStart = p;
+    while (p < end && (c = buf[p] as number) >= 48 && c <= 57) {
+      if (hi < 1e14) hi = hi * 10 + (c - 48);
+      else {
+        lo = lo * 10 + (c - 48);
+        loDigits++;
       }
-      if (fraction === 0) return -1;
-      scale = -fraction;
+      p++;
     }
+    if (p === intStart) return -1;
+    let scale = 0;
+    if (p < end && c === 46) {
+      const fracStart = ++p;
+      while (p < end && (c = buf[p] as number) >= 48 && c <= 57) {
+        if (hi < 1e14) hi = hi * 10 + (c - 48);
+        else {
+          lo = lo * 10 + (c - 48);
+          loDigits++;
+        }
+        p++;
+      }
+      if (p === fracStart) return -1;
+      scale = fracStart - p;
+    }
+    if (p >= end) return -1;
     if (c === 101 || c === 69) {
       c = ++p < end ? (buf[p] as number) : -1;
       let sign = 1;
@@ -270,19 +275,18 @@ export class PredictionLines {
         c = ++p < end ? (buf[p] as number) : -1;
       }
       let e = 0;
-      let eDigits = 0;
-      while (c >= 48 && c <= 57) {
+      const expStart = p;
+      while (p < end && (c = buf[p] as number) >= 48 && c <= 57) {
         if (e < 100000) e = e * 10 + (c - 48);
-        eDigits++;
-        c = ++p < end ? (buf[p] as number) : -1;
+        p++;
       }
-      if (eDigits === 0) return -1;
+      if (p === expStart || p >= end) return -1;
       scale += sign * e;
     }
     if (c !== 10) return -1;
     let value: number;
-    if (digits <= 16 && m < TWO_53 && scale >= -22 && scale <= 22) {
-      value = scale < 0 ? m / (POW10[-scale] as number) : m * (POW10[scale] as number);
+    if (decimalToDouble(hi, lo, loDigits, scale)) {
+      value = decoded[0] as number;
       if (negative) value = -value;
     } else {
       value = Number(buf.toString('latin1', from, p));
@@ -365,6 +369,11 @@ export class PredictionLines {
     }
     this.pending = null;
     return false;
+  }
+
+  /** Bytes read up to the current row. */
+  get consumed(): number {
+    return this.dropped + this.pos;
   }
 
   /** Moves the last row's id to `saved` before the buffer holding it is reused. */

@@ -1,27 +1,20 @@
 /**
  * Pairs two predictions CSVs (`id,correct` or `id,loss`) by id without keeping a row per example.
  * Both files are read side by side, a row of each per step (prediction-lines.ts reads the bytes):
- * rows with the same id at the same step pair at once, comparing id bytes; only rows out of step
- * wait, in an open-addressing table keyed on the id bytes, until their partner shows up. A file
- * whose ids keep increasing cannot repeat one, so it needs no record of its ids; from the first id
- * out of order a set of 64-bit id hashes (rebuilt from the start of the file) catches repeats, and
- * a second read of that file confirms them by id and names the lines.
+ * rows with the same id at the same step pair at once, comparing id bytes; rows out of step wait in
+ * an open-addressing table keyed on the id bytes until their partner shows up (id-tables.ts).
+ *
+ * A repeated id is an error. A file whose ids keep increasing cannot repeat one, so while both do,
+ * nothing else is kept. From a file's first id out of order the table keeps every id (that file's
+ * earlier ids are read again and added), and an id seen twice in one file marks it; a last read of
+ * each such file finds and names the lines.
  */
 import { open, type FileHandle } from 'node:fs/promises';
 import type { MetricKind } from './types.js';
 import { InputError, quote, type Issue } from '../errors.js';
 import { RunningStats } from '../stats/index.js';
 import type { PairedPredictions } from '../analysis/review.js';
-import {
-  BASE,
-  CAND,
-  HashSet64,
-  IdOrder,
-  WaitingTable,
-  hashId,
-  hashed,
-  sameBytes,
-} from './id-tables.js';
+import { BASE, CAND, HashSet64, IdOrder, IdTable, hashId, hashed, sameBytes } from './id-tables.js';
 import {
   NEED,
   ROW,
@@ -43,23 +36,29 @@ export interface PredictionsFile {
   source?: PredictionsSource;
 }
 
-type Readers = () => ByteReader;
-
-/** A function giving a fresh reader of the file from its start, each time it is called. */
-function readersOf(f: PredictionsFile, opened: FileHandle[]): Promise<Readers> | Readers {
-  const source = f.source;
-  if (typeof source === 'function') return () => iterableReader(source);
-  if (source !== undefined) return () => handleReader(source);
-  if (f.path === undefined) throw new TypeError(`predictions file ${f.file}: no path or source`);
-  return open(f.path, 'r').then((handle) => {
-    opened.push(handle);
-    return () => handleReader(handle);
-  });
+/** Fresh readers of one file from its start, and its size when known. */
+interface Opened {
+  reader: () => ByteReader;
+  size: number | null;
 }
 
-/** Reads more and takes the next row; for after `advance()` returned NEED (once per MiB). */
-async function refill(lines: PredictionLines): Promise<boolean> {
-  let r = NEED;
+async function openFile(f: PredictionsFile, opened: FileHandle[]): Promise<Opened> {
+  const source = f.source;
+  if (typeof source === 'function') return { reader: () => iterableReader(source), size: null };
+  let handle: FileHandle;
+  if (source !== undefined) handle = source;
+  else {
+    if (f.path === undefined) throw new TypeError(`predictions file ${f.file}: no path or source`);
+    handle = await open(f.path, 'r');
+    opened.push(handle);
+  }
+  const size = (await handle.stat()).size;
+  return { reader: () => handleReader(handle), size };
+}
+
+/** Takes the next row, reading as needed (one `await` per MiB, not per row). */
+async function row(lines: PredictionLines): Promise<boolean> {
+  let r = lines.advance();
   while (r === NEED) {
     await lines.fill();
     r = lines.advance();
@@ -67,83 +66,194 @@ async function refill(lines: PredictionLines): Promise<boolean> {
   return r === ROW;
 }
 
-async function row(lines: PredictionLines): Promise<boolean> {
-  const r = lines.advance();
-  return r === NEED ? refill(lines) : r === ROW;
+/** Every repeated id of one file, with the line it first appeared on (two reads). */
+async function repeatedIds(o: Opened, file: string, kind: MetricKind): Promise<Issue[]> {
+  const hashes = new HashSet64();
+  const suspects = new Set<string>();
+  let lines = new PredictionLines(o.reader(), file, kind);
+  try {
+    while (await row(lines)) {
+      hashId(lines.key, lines.keyStart, lines.keyLen);
+      if (!hashes.add(hashed.a, hashed.b)) suspects.add(`${hashed.a},${hashed.b}`);
+    }
+  } finally {
+    await lines.close();
+  }
+  const firstLine = new Map<string, number>();
+  const issues: Issue[] = [];
+  if (suspects.size === 0) return issues;
+  lines = new PredictionLines(o.reader(), file, kind);
+  try {
+    while (await row(lines)) {
+      hashId(lines.key, lines.keyStart, lines.keyLen);
+      if (!suspects.has(`${hashed.a},${hashed.b}`)) continue;
+      const id = lines.id();
+      const first = firstLine.get(id);
+      if (first === undefined) firstLine.set(id, lines.line);
+      else
+        issues.push({
+          file,
+          pointer: `line ${lines.line}`,
+          expected: `must have a unique id (also on line ${first})`,
+          got: quote(id),
+        });
+    }
+  } finally {
+    await lines.close();
+  }
+  return issues;
 }
 
-/** Repeated-id bookkeeping of one file. */
-class Repeats {
-  private readonly order = new IdOrder();
-  /** Hashes of every id so far, once the ids stopped increasing. */
-  seen: HashSet64 | null = null;
-  /** Hashes seen twice: the ids to confirm. */
-  readonly suspects = new Set<string>();
+/** `run()` results. */
+const DONE = 0;
+const NEED_A = 1;
+const NEED_B = 2;
+/** A file's ids stopped increasing (`stopped`): its earlier ids must go into the table. */
+const RECORD = 3;
+/** Steps of one pairing step. */
+const ADVANCE_A = 0;
+const ADVANCE_B = 1;
+const PAIR = 2;
+/** Loss differences are handed to RunningStats in batches (a double argument is an allocation). */
+const BATCH = 4096;
+
+/**
+ * The pairing loop, synchronous between reads: `run()` pairs rows until a file needs more bytes or
+ * a file's ids stop increasing, and says which. Pairs go to the counts (proportions) or, in the
+ * original reader's order, to RunningStats (losses).
+ */
+class Pairing {
+  rows = 0;
+  baselineOnly = 0;
+  candidateOnly = 0;
+  readonly diffs = new RunningStats();
+  /** Files (BASE | CAND) whose ids stopped increasing and are all in the table. */
+  recorded = 0;
+  /** The file that `run()` returned RECORD for. */
+  stopped = 0;
+  private hasA = true;
+  private hasB = true;
+  private phase = ADVANCE_A;
+  private readonly orderA = new IdOrder();
+  private readonly orderB = new IdOrder();
+  private readonly batch = new Float64Array(BATCH);
+  private batched = 0;
+  private readonly proportion: boolean;
 
   constructor(
-    private readonly readers: Readers,
-    private readonly file: string,
-    private readonly kind: MetricKind,
-  ) {}
-
-  /** False while the ids keep increasing; then every row needs its hash `add`ed. */
-  needsHash(lines: PredictionLines): boolean {
-    return (
-      this.seen !== null ||
-      !this.order.next(
-        lines.key,
-        lines.keyStart,
-        lines.keyLen,
-        lines.prevKey,
-        lines.prevStart,
-        lines.prevLen,
-      )
-    );
+    readonly a: PredictionLines,
+    readonly b: PredictionLines,
+    readonly table: IdTable,
+    kind: MetricKind,
+  ) {
+    this.proportion = kind === 'proportion';
   }
 
-  /** At the first id out of order: hashes every earlier id of the file. */
-  async start(rowsBefore: number): Promise<void> {
-    this.seen = new HashSet64();
-    const again = new PredictionLines(this.readers(), this.file, this.kind);
-    try {
-      for (let n = rowsBefore; n > 0 && (await row(again)); n--) {
-        hashId(again.key, again.keyStart, again.keyLen);
-        this.add(hashed.a, hashed.b);
+  run(): number {
+    const { a, b, table } = this;
+    for (;;) {
+      if (this.phase === ADVANCE_A) {
+        if (this.hasA) {
+          const r = a.advance();
+          if (r === NEED) return NEED_A;
+          this.hasA = r === ROW;
+        }
+        this.phase = ADVANCE_B;
       }
-    } finally {
-      await again.close();
+      if (this.phase === ADVANCE_B) {
+        if (this.hasB) {
+          const r = b.advance();
+          if (r === NEED) return NEED_B;
+          this.hasB = r === ROW;
+        }
+        this.phase = PAIR;
+      }
+      const hasA = this.hasA;
+      const hasB = this.hasB;
+      if (!hasA && !hasB) return DONE;
+      // Nothing changes before a RECORD return: the step is taken again after it.
+      if (
+        hasA &&
+        (this.recorded & BASE) === 0 &&
+        !this.orderA.next(a.key, a.keyStart, a.keyLen, a.prevKey, a.prevStart, a.prevLen)
+      ) {
+        this.stopped = BASE;
+        return RECORD;
+      }
+      if (
+        hasB &&
+        (this.recorded & CAND) === 0 &&
+        !this.orderB.next(b.key, b.keyStart, b.keyLen, b.prevKey, b.prevStart, b.prevLen)
+      ) {
+        this.stopped = CAND;
+        return RECORD;
+      }
+      let pairs = 0;
+      let x1 = 0;
+      let y1 = 0;
+      let x2 = 0;
+      let y2 = 0;
+      if (hasA && hasB && sameBytes(a.key, a.keyStart, a.keyLen, b.key, b.keyStart, b.keyLen)) {
+        x1 = a.value;
+        y1 = b.value;
+        pairs = 1;
+        if (this.recorded !== 0) {
+          hashId(a.key, a.keyStart, a.keyLen);
+          table.together(a.key, a.keyStart, a.keyLen, hashed.a);
+        }
+      } else {
+        if (hasA) {
+          hashId(a.key, a.keyStart, a.keyLen);
+          table.incoming = a.value;
+          if (table.meet(BASE, a.key, a.keyStart, a.keyLen, hashed.a)) {
+            x1 = a.value;
+            y1 = table.partner;
+            pairs = 1;
+          }
+        }
+        if (hasB) {
+          hashId(b.key, b.keyStart, b.keyLen);
+          table.incoming = b.value;
+          if (table.meet(CAND, b.key, b.keyStart, b.keyLen, hashed.a)) {
+            if (pairs === 0) {
+              x1 = table.partner;
+              y1 = b.value;
+            } else {
+              x2 = table.partner;
+              y2 = b.value;
+            }
+            pairs++;
+          }
+        }
+      }
+      for (let k = 0; k < pairs; k++) {
+        const x = k === 0 ? x1 : x2;
+        const y = k === 0 ? y1 : y2;
+        this.rows++;
+        if (this.proportion) {
+          if (x === 1 && y === 0) this.baselineOnly++;
+          else if (x === 0 && y === 1) this.candidateOnly++;
+        } else {
+          const d = y - x;
+          // RunningStats refuses a non-finite value: let it throw now, as it would have.
+          if (d - d !== 0) this.flushWith(d);
+          this.batch[this.batched++] = d;
+          if (this.batched === BATCH) this.flush();
+        }
+      }
+      this.phase = ADVANCE_A;
     }
   }
 
-  add(a: number, b: number): void {
-    if (!(this.seen as HashSet64).add(a, b)) this.suspects.add(`${a},${b}`);
+  flush(): void {
+    const { batch, diffs } = this;
+    for (let i = 0; i < this.batched; i++) diffs.push(batch[i] as number);
+    this.batched = 0;
   }
 
-  /** Re-reads the file: a line per repeated id, naming its first line. */
-  async issues(): Promise<Issue[]> {
-    if (this.suspects.size === 0) return [];
-    const firstLine = new Map<string, number>();
-    const issues: Issue[] = [];
-    const lines = new PredictionLines(this.readers(), this.file, this.kind);
-    try {
-      while (await row(lines)) {
-        hashId(lines.key, lines.keyStart, lines.keyLen);
-        if (!this.suspects.has(`${hashed.a},${hashed.b}`)) continue;
-        const id = lines.id();
-        const first = firstLine.get(id);
-        if (first === undefined) firstLine.set(id, lines.line);
-        else
-          issues.push({
-            file: this.file,
-            pointer: `line ${lines.line}`,
-            expected: `must have a unique id (also on line ${first})`,
-            got: quote(id),
-          });
-      }
-    } finally {
-      await lines.close();
-    }
-    return issues;
+  private flushWith(d: number): void {
+    this.flush();
+    this.diffs.push(d);
   }
 }
 
@@ -157,62 +267,57 @@ export async function pairPredictions(
   let a: PredictionLines | null = null;
   let b: PredictionLines | null = null;
   try {
-    const baseReaders = await readersOf(baseline, opened);
-    const candReaders = await readersOf(candidate, opened);
-    a = new PredictionLines(baseReaders(), baseline.file, kind);
-    b = new PredictionLines(candReaders(), candidate.file, kind);
-    const baseRepeats = new Repeats(baseReaders, baseline.file, kind);
-    const candRepeats = new Repeats(candReaders, candidate.file, kind);
-    const waiting = new WaitingTable(kind === 'continuous');
-    let rows = 0;
-    let baselineOnly = 0;
-    let candidateOnly = 0;
-    const diffs = new RunningStats();
-    const pair = (x: number, y: number): void => {
-      rows++;
-      if (kind === 'proportion') {
-        if (x === 1 && y === 0) baselineOnly++;
-        else if (x === 0 && y === 1) candidateOnly++;
-      } else diffs.push(y - x);
-    };
-
-    let hasA = await row(a);
-    let hasB = await row(b);
-    while (hasA || hasB) {
-      const together =
-        hasA && hasB && sameBytes(a.key, a.keyStart, a.keyLen, b.key, b.keyStart, b.keyLen);
-      if (together) pair(a.value, b.value);
-      if (hasA) {
-        const needsHash = baseRepeats.needsHash(a);
-        if (needsHash && baseRepeats.seen === null) await baseRepeats.start(a.rows - 1);
-        if (needsHash || !together) hashId(a.key, a.keyStart, a.keyLen);
-        if (needsHash) baseRepeats.add(hashed.a, hashed.b);
-        if (!together && waiting.meet(BASE, a.key, a.keyStart, a.keyLen, hashed.a, a.value))
-          pair(a.value, waiting.partner);
-      }
-      if (hasB) {
-        const needsHash = candRepeats.needsHash(b);
-        if (needsHash && candRepeats.seen === null) await candRepeats.start(b.rows - 1);
-        if (needsHash || !together) hashId(b.key, b.keyStart, b.keyLen);
-        if (needsHash) candRepeats.add(hashed.a, hashed.b);
-        if (!together && waiting.meet(CAND, b.key, b.keyStart, b.keyLen, hashed.a, b.value))
-          pair(waiting.partner, b.value);
-      }
-      if (hasA) {
-        const r = a.advance();
-        hasA = r === NEED ? await refill(a) : r === ROW;
-      }
-      if (hasB) {
-        const r = b.advance();
-        hasB = r === NEED ? await refill(b) : r === ROW;
+    const base = await openFile(baseline, opened);
+    const cand = await openFile(candidate, opened);
+    a = new PredictionLines(base.reader(), baseline.file, kind);
+    b = new PredictionLines(cand.reader(), candidate.file, kind);
+    const table = new IdTable(kind === 'continuous');
+    const pairing = new Pairing(a, b, table, kind);
+    for (let r = pairing.run(); r !== DONE; r = pairing.run()) {
+      if (r === NEED_A) await a.fill();
+      else if (r === NEED_B) await b.fill();
+      else {
+        // A file's ids stopped increasing: keep every id from now on, its earlier ones included.
+        const side = pairing.stopped;
+        if (pairing.recorded === 0) {
+          const estimate = (o: Opened, l: PredictionLines): number =>
+            o.size === null || l.consumed === 0 ? 0 : (o.size * l.rows) / l.consumed;
+          table.recordAll(Math.max(estimate(base, a), estimate(cand, b)) * 1.05);
+        }
+        const lines = side === BASE ? a : b;
+        const again = new PredictionLines((side === BASE ? base : cand).reader(), lines.file, kind);
+        try {
+          for (let n = lines.rows - 1; n > 0 && (await row(again)); n--) {
+            hashId(again.key, again.keyStart, again.keyLen);
+            table.mark(side, again.key, again.keyStart, again.keyLen, hashed.a);
+          }
+        } finally {
+          await again.close();
+        }
+        pairing.recorded |= side;
       }
     }
+    pairing.flush();
 
-    const issues = [...(await baseRepeats.issues()), ...(await candRepeats.issues())];
-    if (issues.length > 0) throw new InputError(issues);
+    if (table.repeated !== 0) {
+      const issues: Issue[] = [];
+      if ((pairing.recorded & BASE) !== 0)
+        issues.push(...(await repeatedIds(base, baseline.file, kind)));
+      if ((pairing.recorded & CAND) !== 0)
+        issues.push(...(await repeatedIds(cand, candidate.file, kind)));
+      if (issues.length > 0) throw new InputError(issues);
+    }
 
-    const unmatched = { baseline: waiting.waitingBase, candidate: waiting.waitingCand };
-    if (kind === 'proportion') return { kind, rows, baselineOnly, candidateOnly, unmatched };
+    const unmatched = { baseline: table.waitingBase, candidate: table.waitingCand };
+    const { rows, diffs } = pairing;
+    if (kind === 'proportion')
+      return {
+        kind,
+        rows,
+        baselineOnly: pairing.baselineOnly,
+        candidateOnly: pairing.candidateOnly,
+        unmatched,
+      };
     return {
       kind,
       rows,

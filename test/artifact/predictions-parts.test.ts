@@ -11,7 +11,7 @@ import {
   HashSet64,
   IdOrder,
   INLINE_ID_BYTES,
-  WaitingTable,
+  IdTable,
   hashId,
   hashed,
 } from '../../src/artifact/id-tables.js';
@@ -23,9 +23,9 @@ const ids = fc.oneof(
   fc.integer({ min: 0, max: 5 }).map((i) => `${'w'.repeat(20)}${i}`), // widens the table
 );
 
-describe('WaitingTable', () => {
+describe('IdTable', () => {
   for (const collide of [false, true]) {
-    it(`behaves like the original two Maps${collide ? ' when every hash collides' : ''} (property)`, () => {
+    it(`pairs like the original two Maps${collide ? ' when every hash collides' : ''} (property)`, () => {
       expect(`${'long-'.repeat(15)}0`.length).toBeGreaterThan(INLINE_ID_BYTES);
       fc.assert(
         fc.property(
@@ -33,29 +33,49 @@ describe('WaitingTable', () => {
             maxLength: 300,
           }),
           fc.boolean(),
-          (steps, losses) => {
-            const table = new WaitingTable(losses, 8);
-            const model = [new Map<string, number>(), new Map<string, number>()];
+          fc.boolean(),
+          (steps, losses, record) => {
+            const table = new IdTable(losses, 8);
+            if (record) table.recordAll(0);
+            const waiting = new Map<number, Map<string, number>>([
+              [BASE, new Map()],
+              [CAND, new Map()],
+            ]);
+            const seen = new Map<number, Set<string>>([
+              [BASE, new Set()],
+              [CAND, new Set()],
+            ]);
+            let repeated = 0;
             for (const [side, id, v] of steps) {
               const value = losses ? v + 0.25 : v;
+              const other = side === BASE ? CAND : BASE;
               const key = Buffer.from(`..${id}`);
               hashId(key, 2, key.length - 2);
-              const met = table.meet(side, key, 2, key.length - 2, collide ? 7 : hashed.a, value);
-              const other = model[1 - side] as Map<string, number>;
-              const partner = other.get(id);
-              if (partner !== undefined) {
-                other.delete(id);
+              table.incoming = value;
+              const met = table.meet(side, key, 2, key.length - 2, collide ? 7 : hashed.a);
+              const mine = seen.get(side) as Set<string>;
+              // Recording, every id a file had is remembered; else only waiting ones are.
+              const before = record
+                ? mine.has(id)
+                : (waiting.get(side) as Map<string, number>).has(id);
+              if (before) repeated |= side;
+              mine.add(id);
+              const partner = (waiting.get(other) as Map<string, number>).get(id);
+              if (partner !== undefined && !(record && before)) {
+                (waiting.get(other) as Map<string, number>).delete(id);
                 expect(met).toBe(true);
                 expect(table.partner).toBe(partner);
               } else {
-                (model[side] as Map<string, number>).set(id, value);
+                if (!(record && before && !(waiting.get(side) as Map<string, number>).has(id)))
+                  (waiting.get(side) as Map<string, number>).set(id, value);
                 expect(met).toBe(false);
               }
             }
             expect([table.waitingBase, table.waitingCand]).toEqual([
-              model[BASE]?.size,
-              model[CAND]?.size,
+              waiting.get(BASE)?.size,
+              waiting.get(CAND)?.size,
             ]);
+            expect(table.repeated).toBe(repeated);
           },
         ),
         { numRuns: 300 },

@@ -1,0 +1,102 @@
+/**
+ * decimalToDouble (the loss column's number reader) against Number() of the same text.
+ * Source: ECMA-262 §7.1.4.1.1 StringToNumber — the mathematical value rounded to nearest, ties to
+ * even (IEEE 754 roundTiesToEven); V8's Number() implements it, so it is the reference.
+ */
+import fc from 'fast-check';
+import { describe, expect, it } from 'vitest';
+import { decimalToDouble, decoded } from '../../src/artifact/decimal.js';
+
+/** hi / lo / loDigits of a digit string without leading zeros (as the reader splits them). */
+function split(digits: string): [number, number, number] {
+  const hi = digits.slice(0, 15);
+  const lo = digits.slice(15);
+  return [Number(hi), lo === '' ? 0 : Number(lo), lo.length];
+}
+
+/** decimalToDouble of `${digits}e${scale}`; NaN means "ask Number()". */
+function read(digits: string, scale: number): number {
+  const [hi, lo, loDigits] = split(digits);
+  return decimalToDouble(hi, lo, loDigits, scale) ? (decoded[0] as number) : Number.NaN;
+}
+
+function agrees(digits: string, scale: number): boolean {
+  const ours = read(digits, scale);
+  return Number.isNaN(ours) || Object.is(ours, Number(`${digits}e${scale}`));
+}
+
+/** Exact decimal digits and exponent of the point halfway between x > 0 and the next double. */
+function halfway(x: number): { digits: string; exp10: number } {
+  const view = new DataView(new ArrayBuffer(8));
+  view.setFloat64(0, x);
+  const bits = view.getBigUint64(0);
+  const biased = Number((bits >> 52n) & 0x7ffn);
+  const mant = (bits & ((1n << 52n) - 1n)) | (1n << 52n);
+  const exp = biased - 1075; // x = mant · 2^exp
+  const odd = 2n * mant + 1n; // halfway = odd · 2^(exp − 1)
+  const e = exp - 1;
+  if (e >= 0) return { digits: (odd << BigInt(e)).toString(), exp10: 0 };
+  const k = -e;
+  return { digits: (odd * 5n ** BigInt(k)).toString(), exp10: -k };
+}
+
+describe('decimalToDouble', () => {
+  it('matches Number() on 16 to 19 significant digits at any scale within ±22 (property)', () => {
+    fc.assert(
+      fc.property(
+        fc.stringMatching(/^[1-9][0-9]{15,18}$/),
+        fc.integer({ min: -22, max: 22 }),
+        (digits, scale) => agrees(digits, scale),
+      ),
+      { numRuns: 20000 },
+    );
+  });
+
+  it('matches Number() on up to 15 digits (Clinger fast path) (property)', () => {
+    fc.assert(
+      fc.property(
+        fc.stringMatching(/^[1-9][0-9]{0,14}$/),
+        fc.integer({ min: -22, max: 22 }),
+        (digits, scale) => Object.is(read(digits, scale), Number(`${digits}e${scale}`)),
+      ),
+      { numRuns: 5000 },
+    );
+  });
+
+  it('matches Number() next to halfway points, where rounding is hardest (property)', () => {
+    let decided = 0;
+    let total = 0;
+    fc.assert(
+      fc.property(
+        fc.double({ min: 1e-6, max: 1e6, noNaN: true }),
+        fc.integer({ min: 16, max: 19 }),
+        fc.integer({ min: -1, max: 1 }),
+        (x, n, nudge) => {
+          const { digits, exp10 } = halfway(x);
+          let cut = BigInt(digits.slice(0, n)) + BigInt(nudge);
+          if (cut <= 0n) cut = 1n;
+          const text = cut.toString();
+          const scale = exp10 + digits.length - n;
+          if (scale < -22 || scale > 22 || text.length !== n) return true;
+          total++;
+          const ours = read(text, scale);
+          if (!Number.isNaN(ours)) decided++;
+          return Number.isNaN(ours) || Object.is(ours, Number(`${text}e${scale}`));
+        },
+      ),
+      { numRuns: 20000 },
+    );
+    // Most of these are still decided without Number(); only near-ties are handed over.
+    expect(total).toBeGreaterThan(1000);
+    expect(decided / total).toBeGreaterThan(0.5);
+  });
+
+  it('rounds an exact tie to even through Number() (2^53 + 1 is halfway)', () => {
+    // 9007199254740993 = 2^53 + 1 lies halfway between 2^53 and 2^53 + 2.
+    const ours = read('9007199254740993', 0);
+    expect(Number.isNaN(ours) || ours === 9007199254740992).toBe(true);
+    expect(read('9007199254740995', 0)).toSatisfy(
+      (v: number) => Number.isNaN(v) || v === 9007199254740996,
+    );
+  });
+});
