@@ -7450,7 +7450,7 @@ var require_public_api = __commonJS({
         return docs;
       return Object.assign([], { empty: true }, composer$1.streamInfo());
     }
-    function parseDocument2(source, options = {}) {
+    function parseDocument(source, options = {}) {
       const { lineCounter: lineCounter2, prettyErrors } = parseOptions(options);
       const parser$1 = new parser.Parser(lineCounter2?.addNewLine);
       const composer$1 = new composer.Composer(options);
@@ -7476,7 +7476,7 @@ var require_public_api = __commonJS({
       } else if (options === void 0 && reviver && typeof reviver === "object") {
         options = reviver;
       }
-      const doc = parseDocument2(src, options);
+      const doc = parseDocument(src, options);
       if (!doc)
         return null;
       doc.warnings.forEach((warning) => log.warn(doc.options.logLevel, warning));
@@ -7512,7 +7512,7 @@ var require_public_api = __commonJS({
     }
     exports.parse = parse;
     exports.parseAllDocuments = parseAllDocuments;
-    exports.parseDocument = parseDocument2;
+    exports.parseDocument = parseDocument;
     exports.stringify = stringify;
   }
 });
@@ -14316,7 +14316,6 @@ async function loadRun(path, options = {}) {
 }
 
 // src/config/load-config.ts
-var import_yaml = __toESM(require_dist(), 1);
 import { readFile as readFile2 } from "node:fs/promises";
 
 // src/artifact/generated/config-schema.js
@@ -14829,8 +14828,9 @@ function failOnIssues(values, file, pointer) {
     ]
   );
 }
-function parseConfig(text, file) {
-  const document = (0, import_yaml.parseDocument)(text, { prettyErrors: true });
+async function parseConfig(text, file) {
+  const { parseDocument } = await Promise.resolve().then(() => __toESM(require_dist(), 1));
+  const document = parseDocument(text, { prettyErrors: true });
   if (document.errors.length > 0) {
     throw new InputError(
       document.errors.slice(0, 10).map((error) => ({
@@ -14875,7 +14875,7 @@ async function loadConfig(path, file, required) {
       }
     ]);
   }
-  return { config: parseConfig(text, file), text };
+  return { config: await parseConfig(text, file), text };
 }
 
 // src/review-files.ts

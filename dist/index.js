@@ -30426,7 +30426,7 @@ var require_public_api = __commonJS({
         return docs;
       return Object.assign([], { empty: true }, composer$1.streamInfo());
     }
-    function parseDocument2(source, options = {}) {
+    function parseDocument(source, options = {}) {
       const { lineCounter: lineCounter2, prettyErrors } = parseOptions(options);
       const parser$1 = new parser.Parser(lineCounter2?.addNewLine);
       const composer$1 = new composer.Composer(options);
@@ -30452,7 +30452,7 @@ var require_public_api = __commonJS({
       } else if (options === void 0 && reviver && typeof reviver === "object") {
         options = reviver;
       }
-      const doc = parseDocument2(src, options);
+      const doc = parseDocument(src, options);
       if (!doc)
         return null;
       doc.warnings.forEach((warning2) => log.warn(doc.options.logLevel, warning2));
@@ -30488,7 +30488,7 @@ var require_public_api = __commonJS({
     }
     exports.parse = parse4;
     exports.parseAllDocuments = parseAllDocuments;
-    exports.parseDocument = parseDocument2;
+    exports.parseDocument = parseDocument;
     exports.stringify = stringify;
   }
 });
@@ -46570,7 +46570,6 @@ async function pairPredictions(baseline, candidate, kind) {
 }
 
 // src/config/load-config.ts
-var import_yaml = __toESM(require_dist(), 1);
 import { readFile as readFile2 } from "node:fs/promises";
 
 // src/artifact/generated/config-schema.js
@@ -47083,8 +47082,9 @@ function failOnIssues(values, file, pointer) {
     ]
   );
 }
-function parseConfig(text2, file) {
-  const document = (0, import_yaml.parseDocument)(text2, { prettyErrors: true });
+async function parseConfig(text2, file) {
+  const { parseDocument } = await Promise.resolve().then(() => __toESM(require_dist(), 1));
+  const document = parseDocument(text2, { prettyErrors: true });
   if (document.errors.length > 0) {
     throw new InputError(
       document.errors.slice(0, 10).map((error2) => ({
@@ -47129,7 +47129,7 @@ async function loadConfig(path, file, required2) {
       }
     ]);
   }
-  return { config: parseConfig(text2, file), text: text2 };
+  return { config: await parseConfig(text2, file), text: text2 };
 }
 
 // src/review-files.ts

@@ -3,7 +3,6 @@
  */
 import { readFile } from 'node:fs/promises';
 import type { ErrorObject } from 'ajv';
-import { parseDocument } from 'yaml';
 import validateConfigSchema from '../artifact/generated/config-schema.js';
 import { InputError, quote, type Issue } from '../errors.js';
 import { ajvIssues } from '../artifact/ajv-issues.js';
@@ -35,7 +34,9 @@ export function failOnIssues(values: readonly string[], file: string, pointer: s
 }
 
 /** Parses and validates config text. */
-export function parseConfig(text: string, file: string): ConfigFile {
+export async function parseConfig(text: string, file: string): Promise<ConfigFile> {
+  // Imported here: a review without a config file does not load the YAML parser at all.
+  const { parseDocument } = await import('yaml');
   const document = parseDocument(text, { prettyErrors: true });
   if (document.errors.length > 0) {
     throw new InputError(
@@ -88,5 +89,5 @@ export async function loadConfig(
       },
     ]);
   }
-  return { config: parseConfig(text, file), text };
+  return { config: await parseConfig(text, file), text };
 }

@@ -23,8 +23,8 @@ describe('config', () => {
     expect(review.levers.map((l) => l.id)).toContain('early-stopping');
   });
 
-  it('lets flags override the file, and the file override the defaults', () => {
-    const config = parseConfig(
+  it('lets flags override the file, and the file override the defaults', async () => {
+    const config = await parseConfig(
       'alpha: 0.01\nmin-effect: 0.5\nfail-on: [toward-overfitting]\n',
       'c.yml',
     );
