@@ -45684,10 +45684,11 @@ var IdTable = class {
   constructor(losses, slots = 1 << 12) {
     this.losses = losses;
     this.cap = slots;
-    this.mask = slots - 1;
+    this.mask_ = slots - 1;
     this.words = new Uint32Array(slots * this.stride);
     this.bytes = new Uint8Array(this.words.buffer);
     this.values = losses ? new Float64Array(slots) : null;
+    this.steps = losses ? new Uint32Array(slots) : null;
   }
   losses;
   /** Rows waiting, per file. */
@@ -45695,20 +45696,33 @@ var IdTable = class {
   waitingCand = 0;
   /** Files (BASE | CAND) with an id seen twice. */
   repeated = 0;
-  /** The value of the row `meet` paired with. */
+  /** The value and step of the row `meet` paired with. */
   partner = 0;
-  /** The value of the arriving row, for `meet` (a field: a double argument would be boxed). */
+  partnerStep = 0;
+  /** The value and step of the arriving row, for `meet` (fields: a double argument is boxed). */
   incoming = 0;
+  incomingStep = 0;
   recording = false;
   cap;
-  mask;
+  mask_;
   width = 16;
   stride = 2 + 16 / 4;
   count = 0;
   words;
   bytes;
   values;
+  /** Steps of waiting loss rows (their order decides the order of the differences). */
+  steps;
   long = /* @__PURE__ */ new Map();
+  /** Slot mask: an id's home slot is `hash & mask`. */
+  get mask() {
+    return this.mask_;
+  }
+  /** Room for `extra` more ids of up to `longest` bytes, so that no rebuild comes in between. */
+  prepare(extra, longest) {
+    if (longest > this.width && longest <= INLINE_ID_BYTES) this.grow(longest);
+    this.reserve(this.count + extra);
+  }
   /** Keep every id from now on; `expected`: about how many distinct ids will come. */
   recordAll(expected) {
     this.recording = true;
@@ -45733,7 +45747,11 @@ var IdTable = class {
       if (bits2 === side) this.store(slot, at, word, side);
       return false;
     }
-    this.partner = this.values === null ? (word & ONE) >>> 2 : this.values[slot];
+    if (this.values === null) this.partner = (word & ONE) >>> 2;
+    else {
+      this.partner = this.values[slot];
+      this.partnerStep = this.steps[slot];
+    }
     this.count1(bits2, -1);
     if (this.recording) this.words[at] = word & ~(ONE | BOTH) | BOTH;
     else this.remove(slot);
@@ -45748,7 +45766,7 @@ var IdTable = class {
         start + len
       );
       const entry = this.long.get(id);
-      if (entry === void 0) this.long.set(id, { bits: BOTH, value: 0 });
+      if (entry === void 0) this.long.set(id, { bits: BOTH, value: 0, step: 0 });
       else {
         this.repeated |= entry.bits;
         entry.bits = BOTH;
@@ -45774,7 +45792,7 @@ var IdTable = class {
         start + len
       );
       const entry = this.long.get(id);
-      if (entry === void 0) this.long.set(id, { bits: BOTH, value: 0 });
+      if (entry === void 0) this.long.set(id, { bits: BOTH, value: 0, step: 0 });
       else if ((entry.bits & side) === 0) this.repeated |= entry.bits;
       return;
     }
@@ -45793,16 +45811,20 @@ var IdTable = class {
     );
     const entry = this.long.get(id);
     if (entry === void 0) {
-      this.long.set(id, { bits: side, value: this.incoming });
+      this.long.set(id, { bits: side, value: this.incoming, step: this.incomingStep });
       this.count1(side, 1);
       return false;
     }
     if ((entry.bits & side) !== 0) {
       this.repeated |= side;
-      if (entry.bits === side) entry.value = this.incoming;
+      if (entry.bits === side) {
+        entry.value = this.incoming;
+        entry.step = this.incomingStep;
+      }
       return false;
     }
     this.partner = entry.value;
+    this.partnerStep = entry.step;
     this.count1(entry.bits, -1);
     if (this.recording) entry.bits = BOTH;
     else this.long.delete(id);
@@ -45811,7 +45833,8 @@ var IdTable = class {
   /** Slot of the id, or ~slot where it would go. */
   find(key, start, len, hash) {
     if (len > this.width || (this.count + 1) * 10 > this.cap * 7) this.grow(len);
-    const { words, bytes, stride, mask } = this;
+    const { words, bytes, stride } = this;
+    const mask = this.mask_;
     let i2 = hash & mask;
     for (; ; ) {
       const at = i2 * stride;
@@ -45846,6 +45869,7 @@ var IdTable = class {
     else {
       this.words[at] = base;
       this.values[slot] = this.incoming;
+      this.steps[slot] = this.incomingStep;
     }
     if ((word & BOTH) !== side) this.count1(side, 1);
   }
@@ -45854,7 +45878,8 @@ var IdTable = class {
     else if (bits2 === CAND) this.waitingCand += by;
   }
   remove(slot) {
-    const { words, values, stride, mask } = this;
+    const { words, values, steps, stride } = this;
+    const mask = this.mask_;
     this.count--;
     let i2 = slot;
     let j = slot;
@@ -45865,7 +45890,10 @@ var IdTable = class {
       const home = words[j * stride] & mask;
       if (i2 <= j ? i2 < home && home <= j : i2 < home || home <= j) continue;
       words.copyWithin(i2 * stride, j * stride, j * stride + stride);
-      if (values !== null) values[i2] = values[j];
+      if (values !== null && steps !== null) {
+        values[i2] = values[j];
+        steps[i2] = steps[j];
+      }
       i2 = j;
     }
     words[i2 * stride + 1] = 0;
@@ -45883,28 +45911,130 @@ var IdTable = class {
     this.rebuild(cap, width);
   }
   rebuild(cap, width) {
-    const { words, values, stride, cap: oldCap } = this;
+    const { words, values, steps, stride, cap: oldCap } = this;
     this.cap = cap;
-    this.mask = cap - 1;
+    this.mask_ = cap - 1;
     this.width = width;
     this.stride = 2 + width / 4;
     this.words = new Uint32Array(cap * this.stride);
     this.bytes = new Uint8Array(this.words.buffer);
     this.values = values === null ? null : new Float64Array(cap);
+    this.steps = steps === null ? null : new Uint32Array(cap);
     const keyWords = stride - 2;
     for (let s = 0; s < oldCap; s++) {
       const word = words[s * stride + 1];
       if (word === 0) continue;
       const hash = words[s * stride];
-      let i2 = hash & this.mask;
-      while (this.words[i2 * this.stride + 1] !== 0) i2 = i2 + 1 & this.mask;
+      let i2 = hash & this.mask_;
+      while (this.words[i2 * this.stride + 1] !== 0) i2 = i2 + 1 & this.mask_;
       const at = i2 * this.stride;
       this.words[at] = hash;
       this.words[at + 1] = word;
       for (let w = 0; w < keyWords; w++)
         this.words[at + 2 + w] = words[s * stride + 2 + w];
-      if (this.values !== null && values !== null) this.values[i2] = values[s];
+      if (this.values !== null && values !== null && this.steps !== null && steps !== null) {
+        this.values[i2] = values[s];
+        this.steps[i2] = steps[s];
+      }
     }
+  }
+};
+
+// src/artifact/id-batch.ts
+var MEET_BASE = 1;
+var MEET_CAND = 2;
+var TOGETHER = 3;
+var MARK_BASE = 4;
+var MARK_CAND = 5;
+var HEAD = 3;
+var IdBatch = class {
+  constructor(capacity) {
+    this.capacity = capacity;
+    this.words = new Uint32Array(capacity * this.stride);
+    this.bytes = new Uint8Array(this.words.buffer);
+    this.values = new Float64Array(capacity);
+    this.order = new Int32Array(capacity);
+  }
+  capacity;
+  size = 0;
+  /** Longest id in the batch. */
+  longest = 0;
+  width = 16;
+  stride = HEAD + 16 / 4;
+  words;
+  bytes;
+  values;
+  order;
+  get full() {
+    return this.size === this.capacity;
+  }
+  add(kind, key, start, len, hash, step, value) {
+    if (len > this.width) this.widen(len);
+    const r = this.size++;
+    const at = r * this.stride;
+    const words = this.words;
+    words[at] = hash;
+    words[at + 1] = step;
+    words[at + 2] = len << 3 | kind;
+    const bytes = this.bytes;
+    for (let k = 0, b = (at + HEAD) * 4; k < len; k++) bytes[b + k] = key[start + k];
+    this.values[r] = value;
+    if (len > this.longest) this.longest = len;
+  }
+  /** Record indices in order of `(hash & mask) >>> shift` (a counting sort); `size` of them. */
+  sorted(mask, shift) {
+    const groups2 = (mask >>> shift) + 1;
+    const counts = new Int32Array(groups2 + 1);
+    const { words, stride, order, size } = this;
+    for (let r = 0; r < size; r++) {
+      const g = ((words[r * stride] & mask) >>> shift) + 1;
+      counts[g] = counts[g] + 1;
+    }
+    for (let g = 1; g <= groups2; g++) counts[g] = counts[g] + counts[g - 1];
+    for (let r = 0; r < size; r++) {
+      const g = (words[r * stride] & mask) >>> shift;
+      order[counts[g]] = r;
+      counts[g] = counts[g] + 1;
+    }
+    return order;
+  }
+  hash(r) {
+    return this.words[r * this.stride];
+  }
+  step(r) {
+    return this.words[r * this.stride + 1];
+  }
+  kind(r) {
+    return this.words[r * this.stride + 2] & 7;
+  }
+  len(r) {
+    return this.words[r * this.stride + 2] >>> 3;
+  }
+  /** Byte offset of record r's id in `keys`. */
+  keyStart(r) {
+    return (r * this.stride + HEAD) * 4;
+  }
+  get keys() {
+    return this.bytes;
+  }
+  value(r) {
+    return this.values[r];
+  }
+  clear() {
+    this.size = 0;
+    this.longest = 0;
+  }
+  widen(len) {
+    let width = this.width;
+    while (width < len) width *= 2;
+    const stride = HEAD + width / 4;
+    const words = new Uint32Array(this.capacity * stride);
+    for (let r = 0; r < this.size; r++)
+      words.set(this.words.subarray(r * this.stride, (r + 1) * this.stride), r * stride);
+    this.words = words;
+    this.bytes = new Uint8Array(words.buffer);
+    this.width = width;
+    this.stride = stride;
   }
 };
 
@@ -46382,16 +46512,22 @@ var ADVANCE_A = 0;
 var ADVANCE_B = 1;
 var PAIR = 2;
 var BATCH = 4096;
+var TUNING = { window: 32768, regionBits: 12 };
+var HUGE = 8e307;
 var Pairing = class {
-  constructor(a, b, table2, kind) {
+  constructor(a, b, table2, kind, tuning) {
     this.a = a;
     this.b = b;
     this.table = table2;
+    this.tuning = tuning;
     this.proportion = kind === "proportion";
+    this.batch = new IdBatch(2 * tuning.window);
+    this.ring = new Float64Array(this.proportion ? 0 : 3 * tuning.window).fill(Number.NaN);
   }
   a;
   b;
   table;
+  tuning;
   rows = 0;
   baselineOnly = 0;
   candidateOnly = 0;
@@ -46400,16 +46536,23 @@ var Pairing = class {
   recorded = 0;
   /** The file that `run()` returned RECORD for. */
   stopped = 0;
+  batch;
   hasA = true;
   hasB = true;
   phase = ADVANCE_A;
+  step = 0;
+  windowStart = 0;
+  /** Losses: pairs of the window by (step − windowStart) · 3 + k; NaN for none. */
+  ring;
+  ringUsed = false;
+  strict = false;
   orderA = new IdOrder();
   orderB = new IdOrder();
-  batch = new Float64Array(BATCH);
-  batched = 0;
+  pending = new Float64Array(BATCH);
+  pendingCount = 0;
   proportion;
   run() {
-    const { a, b, table: table2 } = this;
+    const { a, b, table: table2, batch } = this;
     for (; ; ) {
       if (this.phase === ADVANCE_A) {
         if (this.hasA) {
@@ -46438,72 +46581,119 @@ var Pairing = class {
         this.stopped = CAND;
         return RECORD;
       }
-      let pairs = 0;
-      let x1 = 0;
-      let y1 = 0;
-      let x2 = 0;
-      let y2 = 0;
+      const step = this.step;
+      if (!this.proportion && !this.strict) {
+        if (hasA && !(Math.abs(a.value) <= HUGE) || hasB && !(Math.abs(b.value) <= HUGE))
+          this.strict = true;
+      }
       if (hasA && hasB && sameBytes(a.key, a.keyStart, a.keyLen, b.key, b.keyStart, b.keyLen)) {
-        x1 = a.value;
-        y1 = b.value;
-        pairs = 1;
         if (this.recorded !== 0) {
           hashId(a.key, a.keyStart, a.keyLen);
-          table2.together(a.key, a.keyStart, a.keyLen, hashed.a);
+          this.operate(TOGETHER, a.key, a.keyStart, a.keyLen, hashed.a, step, 0);
         }
+        this.rows++;
+        const x2 = a.value;
+        const y = b.value;
+        if (this.proportion) {
+          if (x2 === 1 && y === 0) this.baselineOnly++;
+          else if (x2 === 0 && y === 1) this.candidateOnly++;
+        } else if (this.ringUsed) this.ring[(step - this.windowStart) * 3] = y - x2;
+        else this.push(y - x2);
       } else {
         if (hasA) {
           hashId(a.key, a.keyStart, a.keyLen);
-          table2.incoming = a.value;
-          if (table2.meet(BASE, a.key, a.keyStart, a.keyLen, hashed.a)) {
-            x1 = a.value;
-            y1 = table2.partner;
-            pairs = 1;
-          }
+          this.operate(MEET_BASE, a.key, a.keyStart, a.keyLen, hashed.a, step, a.value);
         }
         if (hasB) {
           hashId(b.key, b.keyStart, b.keyLen);
-          table2.incoming = b.value;
-          if (table2.meet(CAND, b.key, b.keyStart, b.keyLen, hashed.a)) {
-            if (pairs === 0) {
-              x1 = table2.partner;
-              y1 = b.value;
-            } else {
-              x2 = table2.partner;
-              y2 = b.value;
-            }
-            pairs++;
-          }
+          this.operate(MEET_CAND, b.key, b.keyStart, b.keyLen, hashed.a, step, b.value);
         }
       }
-      for (let k = 0; k < pairs; k++) {
-        const x3 = k === 0 ? x1 : x2;
-        const y = k === 0 ? y1 : y2;
-        this.rows++;
-        if (this.proportion) {
-          if (x3 === 1 && y === 0) this.baselineOnly++;
-          else if (x3 === 0 && y === 1) this.candidateOnly++;
-        } else {
-          const d = y - x3;
-          if (d - d !== 0) this.flushWith(d);
-          this.batch[this.batched++] = d;
-          if (this.batched === BATCH) this.flush();
-        }
-      }
+      this.step++;
+      if (this.strict || this.step - this.windowStart === this.tuning.window || batch.full)
+        this.settle();
       this.phase = ADVANCE_A;
     }
   }
-  flush() {
-    const { batch, diffs } = this;
-    for (let i2 = 0; i2 < this.batched; i2++) diffs.push(batch[i2]);
-    this.batched = 0;
+  /** Queues a table operation (applies it at once for a long id, which the table keeps apart). */
+  operate(kind, key, start, len, hash, step, value) {
+    if (kind === MEET_BASE || kind === MEET_CAND) this.ringUsed = !this.proportion;
+    if (len <= INLINE_ID_BYTES) this.batch.add(kind, key, start, len, hash, step, value);
+    else {
+      this.table.incoming = value;
+      this.table.incomingStep = step;
+      this.apply(kind, key, start, len, hash, step);
+    }
   }
-  flushWith(d) {
-    this.flush();
-    this.diffs.push(d);
+  /** Applies the batch and hands on the pairs of the window's steps, in order. */
+  settle() {
+    this.applyBatch();
+    if (this.ringUsed) {
+      const ring = this.ring;
+      const stop = (this.step - this.windowStart) * 3;
+      for (let i2 = 0; i2 < stop; i2++) {
+        const d = ring[i2];
+        if (d === d) {
+          this.push(d);
+          ring[i2] = Number.NaN;
+        }
+      }
+    }
+    this.windowStart = this.step;
+  }
+  applyBatch() {
+    const { batch, table: table2 } = this;
+    if (batch.size === 0) return;
+    table2.prepare(batch.size, batch.longest);
+    const order = batch.sorted(table2.mask, this.tuning.regionBits);
+    const keys = batch.keys;
+    for (let i2 = 0; i2 < batch.size; i2++) {
+      const r = order[i2];
+      table2.incoming = batch.value(r);
+      const step = batch.step(r);
+      table2.incomingStep = step;
+      this.apply(batch.kind(r), keys, batch.keyStart(r), batch.len(r), batch.hash(r), step);
+    }
+    batch.clear();
+  }
+  /** One table operation; a pair it makes goes to the counts or the ring. */
+  apply(kind, key, start, len, hash, step) {
+    const table2 = this.table;
+    if (kind === TOGETHER) table2.together(key, start, len, hash);
+    else if (kind === MARK_BASE || kind === MARK_CAND)
+      table2.mark(kind === MARK_BASE ? BASE : CAND, key, start, len, hash);
+    else {
+      const base = kind === MEET_BASE;
+      if (!table2.meet(base ? BASE : CAND, key, start, len, hash)) return;
+      this.rows++;
+      const x2 = base ? table2.incoming : table2.partner;
+      const y = base ? table2.partner : table2.incoming;
+      if (this.proportion) {
+        if (x2 === 1 && y === 0) this.baselineOnly++;
+        else if (x2 === 0 && y === 1) this.candidateOnly++;
+        return;
+      }
+      const later = step > table2.partnerStep;
+      const at = later ? step : table2.partnerStep;
+      const k = base === later ? 1 : 2;
+      this.ring[(at - this.windowStart) * 3 + k] = y - x2;
+    }
+  }
+  push(d) {
+    if (d - d !== 0) {
+      this.flush();
+      this.diffs.push(d);
+    }
+    this.pending[this.pendingCount++] = d;
+    if (this.pendingCount === BATCH) this.flush();
+  }
+  flush() {
+    const { pending, diffs } = this;
+    for (let i2 = 0; i2 < this.pendingCount; i2++) diffs.push(pending[i2]);
+    this.pendingCount = 0;
   }
 };
-async function pairPredictions(baseline, candidate, kind) {
+async function pairPredictions(baseline, candidate, kind, tuning = TUNING) {
   const opened = [];
   let a = null;
   let b = null;
@@ -46513,11 +46703,12 @@ async function pairPredictions(baseline, candidate, kind) {
     a = new PredictionLines(base.reader(), baseline.file, kind);
     b = new PredictionLines(cand.reader(), candidate.file, kind);
     const table2 = new IdTable(kind === "continuous");
-    const pairing = new Pairing(a, b, table2, kind);
+    const pairing = new Pairing(a, b, table2, kind, tuning);
     for (let r = pairing.run(); r !== DONE; r = pairing.run()) {
       if (r === NEED_A) await a.fill();
       else if (r === NEED_B) await b.fill();
       else {
+        pairing.settle();
         const side = pairing.stopped;
         if (pairing.recorded === 0) {
           const estimate = (o, l) => o.size === null || l.consumed === 0 ? 0 : o.size * l.rows / l.consumed;
@@ -46525,17 +46716,21 @@ async function pairPredictions(baseline, candidate, kind) {
         }
         const lines = side === BASE ? a : b;
         const again = new PredictionLines((side === BASE ? base : cand).reader(), lines.file, kind);
+        const mark = side === BASE ? MARK_BASE : MARK_CAND;
         try {
           for (let n = lines.rows - 1; n > 0 && await row(again); n--) {
             hashId(again.key, again.keyStart, again.keyLen);
-            table2.mark(side, again.key, again.keyStart, again.keyLen, hashed.a);
+            pairing.operate(mark, again.key, again.keyStart, again.keyLen, hashed.a, 0, 0);
+            if (pairing.batch.full) pairing.applyBatch();
           }
+          pairing.applyBatch();
         } finally {
           await again.close();
         }
         pairing.recorded |= side;
       }
     }
+    pairing.settle();
     pairing.flush();
     if (table2.repeated !== 0) {
       const issues2 = [];

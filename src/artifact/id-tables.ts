@@ -149,20 +149,24 @@ export class IdTable {
   waitingCand = 0;
   /** Files (BASE | CAND) with an id seen twice. */
   repeated = 0;
-  /** The value of the row `meet` paired with. */
+  /** The value and step of the row `meet` paired with. */
   partner = 0;
-  /** The value of the arriving row, for `meet` (a field: a double argument would be boxed). */
+  partnerStep = 0;
+  /** The value and step of the arriving row, for `meet` (fields: a double argument is boxed). */
   incoming = 0;
+  incomingStep = 0;
   private recording = false;
   private cap: number;
-  private mask: number;
+  private mask_: number;
   private width = 16;
   private stride = 2 + 16 / 4;
   private count = 0;
   private words: Uint32Array;
   private bytes: Uint8Array;
   private values: Float64Array | null;
-  private readonly long = new Map<string, { bits: number; value: number }>();
+  /** Steps of waiting loss rows (their order decides the order of the differences). */
+  private steps: Uint32Array | null;
+  private readonly long = new Map<string, { bits: number; value: number; step: number }>();
 
   /** `losses`: values are numbers, not 0/1. `slots`: initial capacity, a power of two. */
   constructor(
@@ -170,10 +174,22 @@ export class IdTable {
     slots = 1 << 12,
   ) {
     this.cap = slots;
-    this.mask = slots - 1;
+    this.mask_ = slots - 1;
     this.words = new Uint32Array(slots * this.stride);
     this.bytes = new Uint8Array(this.words.buffer);
     this.values = losses ? new Float64Array(slots) : null;
+    this.steps = losses ? new Uint32Array(slots) : null;
+  }
+
+  /** Slot mask: an id's home slot is `hash & mask`. */
+  get mask(): number {
+    return this.mask_;
+  }
+
+  /** Room for `extra` more ids of up to `longest` bytes, so that no rebuild comes in between. */
+  prepare(extra: number, longest: number): void {
+    if (longest > this.width && longest <= INLINE_ID_BYTES) this.grow(longest);
+    this.reserve(this.count + extra);
   }
 
   /** Keep every id from now on; `expected`: about how many distinct ids will come. */
@@ -201,7 +217,11 @@ export class IdTable {
       if (bits === side) this.store(slot, at, word, side); // the old Map.set: replace the value
       return false;
     }
-    this.partner = this.values === null ? (word & ONE) >>> 2 : (this.values[slot] as number);
+    if (this.values === null) this.partner = (word & ONE) >>> 2;
+    else {
+      this.partner = this.values[slot] as number;
+      this.partnerStep = (this.steps as Uint32Array)[slot] as number;
+    }
     this.count1(bits, -1);
     if (this.recording) this.words[at] = (word & ~(ONE | BOTH)) | BOTH;
     else this.remove(slot);
@@ -217,7 +237,7 @@ export class IdTable {
         start + len,
       );
       const entry = this.long.get(id);
-      if (entry === undefined) this.long.set(id, { bits: BOTH, value: 0 });
+      if (entry === undefined) this.long.set(id, { bits: BOTH, value: 0, step: 0 });
       else {
         this.repeated |= entry.bits;
         entry.bits = BOTH;
@@ -244,7 +264,7 @@ export class IdTable {
         start + len,
       );
       const entry = this.long.get(id);
-      if (entry === undefined) this.long.set(id, { bits: BOTH, value: 0 });
+      if (entry === undefined) this.long.set(id, { bits: BOTH, value: 0, step: 0 });
       else if ((entry.bits & side) === 0) this.repeated |= entry.bits;
       return;
     }
@@ -264,16 +284,20 @@ export class IdTable {
     );
     const entry = this.long.get(id);
     if (entry === undefined) {
-      this.long.set(id, { bits: side, value: this.incoming });
+      this.long.set(id, { bits: side, value: this.incoming, step: this.incomingStep });
       this.count1(side, 1);
       return false;
     }
     if ((entry.bits & side) !== 0) {
       this.repeated |= side;
-      if (entry.bits === side) entry.value = this.incoming;
+      if (entry.bits === side) {
+        entry.value = this.incoming;
+        entry.step = this.incomingStep;
+      }
       return false;
     }
     this.partner = entry.value;
+    this.partnerStep = entry.step;
     this.count1(entry.bits, -1);
     if (this.recording) entry.bits = BOTH;
     else this.long.delete(id);
@@ -283,7 +307,8 @@ export class IdTable {
   /** Slot of the id, or ~slot where it would go. */
   private find(key: Uint8Array, start: number, len: number, hash: number): number {
     if (len > this.width || (this.count + 1) * 10 > this.cap * 7) this.grow(len);
-    const { words, bytes, stride, mask } = this;
+    const { words, bytes, stride } = this;
+    const mask = this.mask_;
     let i = hash & mask;
     for (;;) {
       const at = i * stride;
@@ -327,6 +352,7 @@ export class IdTable {
     else {
       this.words[at] = base;
       this.values[slot] = this.incoming;
+      (this.steps as Uint32Array)[slot] = this.incomingStep;
     }
     if ((word & BOTH) !== side) this.count1(side, 1);
   }
@@ -337,7 +363,8 @@ export class IdTable {
   }
 
   private remove(slot: number): void {
-    const { words, values, stride, mask } = this;
+    const { words, values, steps, stride } = this;
+    const mask = this.mask_;
     this.count--;
     let i = slot;
     let j = slot;
@@ -349,7 +376,10 @@ export class IdTable {
       // Leave j where it is when its home slot lies cyclically in (i, j].
       if (i <= j ? i < home && home <= j : i < home || home <= j) continue;
       words.copyWithin(i * stride, j * stride, j * stride + stride);
-      if (values !== null) values[i] = values[j] as number;
+      if (values !== null && steps !== null) {
+        values[i] = values[j] as number;
+        steps[i] = steps[j] as number;
+      }
       i = j;
     }
     words[i * stride + 1] = 0;
@@ -370,27 +400,31 @@ export class IdTable {
   }
 
   private rebuild(cap: number, width: number): void {
-    const { words, values, stride, cap: oldCap } = this;
+    const { words, values, steps, stride, cap: oldCap } = this;
     this.cap = cap;
-    this.mask = cap - 1;
+    this.mask_ = cap - 1;
     this.width = width;
     this.stride = 2 + width / 4;
     this.words = new Uint32Array(cap * this.stride);
     this.bytes = new Uint8Array(this.words.buffer);
     this.values = values === null ? null : new Float64Array(cap);
+    this.steps = steps === null ? null : new Uint32Array(cap);
     const keyWords = stride - 2;
     for (let s = 0; s < oldCap; s++) {
       const word = words[s * stride + 1] as number;
       if (word === 0) continue;
       const hash = words[s * stride] as number;
-      let i = hash & this.mask;
-      while (this.words[i * this.stride + 1] !== 0) i = (i + 1) & this.mask;
+      let i = hash & this.mask_;
+      while (this.words[i * this.stride + 1] !== 0) i = (i + 1) & this.mask_;
       const at = i * this.stride;
       this.words[at] = hash;
       this.words[at + 1] = word;
       for (let w = 0; w < keyWords; w++)
         this.words[at + 2 + w] = words[s * stride + 2 + w] as number;
-      if (this.values !== null && values !== null) this.values[i] = values[s] as number;
+      if (this.values !== null && values !== null && this.steps !== null && steps !== null) {
+        this.values[i] = values[s] as number;
+        this.steps[i] = steps[s] as number;
+      }
     }
   }
 }

@@ -14,7 +14,18 @@ import type { MetricKind } from './types.js';
 import { InputError, quote, type Issue } from '../errors.js';
 import { RunningStats } from '../stats/index.js';
 import type { PairedPredictions } from '../analysis/review.js';
-import { BASE, CAND, HashSet64, IdOrder, IdTable, hashId, hashed, sameBytes } from './id-tables.js';
+import {
+  BASE,
+  CAND,
+  HashSet64,
+  INLINE_ID_BYTES,
+  IdOrder,
+  IdTable,
+  hashId,
+  hashed,
+  sameBytes,
+} from './id-tables.js';
+import { IdBatch, MARK_BASE, MARK_CAND, MEET_BASE, MEET_CAND, TOGETHER } from './id-batch.js';
 import {
   NEED,
   ROW,
@@ -116,11 +127,25 @@ const ADVANCE_B = 1;
 const PAIR = 2;
 /** Loss differences are handed to RunningStats in batches (a double argument is an allocation). */
 const BATCH = 4096;
+/**
+ * Table operations are batched over `window` steps and grouped by table regions of 2^regionBits
+ * slots (about 100 KB). Smaller values only for tests: they reorder operations much more.
+ */
+export interface PairingTuning {
+  window: number;
+  regionBits: number;
+}
+const TUNING: PairingTuning = { window: 32768, regionBits: 12 };
+/** Loss values beyond this can overflow a difference: then pairs are settled step by step. */
+const HUGE = 8e307;
 
 /**
  * The pairing loop, synchronous between reads: `run()` pairs rows until a file needs more bytes or
- * a file's ids stop increasing, and says which. Pairs go to the counts (proportions) or, in the
- * original reader's order, to RunningStats (losses).
+ * a file's ids stop increasing, and says which. Rows out of step go to the id table in batches
+ * (id-batch.ts). Pairs go to the counts (proportions) or to RunningStats (losses) in the original
+ * reader's order: a pair counts at the step its second row was read, the pair of the step's own
+ * rows first, then the baseline row's, then the candidate row's; a window of steps is held in
+ * `ring` until its batch is applied.
  */
 class Pairing {
   rows = 0;
@@ -131,13 +156,20 @@ class Pairing {
   recorded = 0;
   /** The file that `run()` returned RECORD for. */
   stopped = 0;
+  readonly batch: IdBatch;
   private hasA = true;
   private hasB = true;
   private phase = ADVANCE_A;
+  private step = 0;
+  private windowStart = 0;
+  /** Losses: pairs of the window by (step − windowStart) · 3 + k; NaN for none. */
+  private readonly ring: Float64Array;
+  private ringUsed = false;
+  private strict = false;
   private readonly orderA = new IdOrder();
   private readonly orderB = new IdOrder();
-  private readonly batch = new Float64Array(BATCH);
-  private batched = 0;
+  private readonly pending = new Float64Array(BATCH);
+  private pendingCount = 0;
   private readonly proportion: boolean;
 
   constructor(
@@ -145,12 +177,15 @@ class Pairing {
     readonly b: PredictionLines,
     readonly table: IdTable,
     kind: MetricKind,
+    private readonly tuning: PairingTuning,
   ) {
     this.proportion = kind === 'proportion';
+    this.batch = new IdBatch(2 * tuning.window);
+    this.ring = new Float64Array(this.proportion ? 0 : 3 * tuning.window).fill(Number.NaN);
   }
 
   run(): number {
-    const { a, b, table } = this;
+    const { a, b, table, batch } = this;
     for (;;) {
       if (this.phase === ADVANCE_A) {
         if (this.hasA) {
@@ -188,72 +223,139 @@ class Pairing {
         this.stopped = CAND;
         return RECORD;
       }
-      let pairs = 0;
-      let x1 = 0;
-      let y1 = 0;
-      let x2 = 0;
-      let y2 = 0;
+      const step = this.step;
+      if (!this.proportion && !this.strict) {
+        if ((hasA && !(Math.abs(a.value) <= HUGE)) || (hasB && !(Math.abs(b.value) <= HUGE)))
+          this.strict = true;
+      }
       if (hasA && hasB && sameBytes(a.key, a.keyStart, a.keyLen, b.key, b.keyStart, b.keyLen)) {
-        x1 = a.value;
-        y1 = b.value;
-        pairs = 1;
         if (this.recorded !== 0) {
           hashId(a.key, a.keyStart, a.keyLen);
-          table.together(a.key, a.keyStart, a.keyLen, hashed.a);
+          this.operate(TOGETHER, a.key, a.keyStart, a.keyLen, hashed.a, step, 0);
         }
-      } else {
-        if (hasA) {
-          hashId(a.key, a.keyStart, a.keyLen);
-          table.incoming = a.value;
-          if (table.meet(BASE, a.key, a.keyStart, a.keyLen, hashed.a)) {
-            x1 = a.value;
-            y1 = table.partner;
-            pairs = 1;
-          }
-        }
-        if (hasB) {
-          hashId(b.key, b.keyStart, b.keyLen);
-          table.incoming = b.value;
-          if (table.meet(CAND, b.key, b.keyStart, b.keyLen, hashed.a)) {
-            if (pairs === 0) {
-              x1 = table.partner;
-              y1 = b.value;
-            } else {
-              x2 = table.partner;
-              y2 = b.value;
-            }
-            pairs++;
-          }
-        }
-      }
-      for (let k = 0; k < pairs; k++) {
-        const x = k === 0 ? x1 : x2;
-        const y = k === 0 ? y1 : y2;
         this.rows++;
+        const x = a.value;
+        const y = b.value;
         if (this.proportion) {
           if (x === 1 && y === 0) this.baselineOnly++;
           else if (x === 0 && y === 1) this.candidateOnly++;
-        } else {
-          const d = y - x;
-          // RunningStats refuses a non-finite value: let it throw now, as it would have.
-          if (d - d !== 0) this.flushWith(d);
-          this.batch[this.batched++] = d;
-          if (this.batched === BATCH) this.flush();
+        } else if (this.ringUsed) this.ring[(step - this.windowStart) * 3] = y - x;
+        else this.push(y - x);
+      } else {
+        if (hasA) {
+          hashId(a.key, a.keyStart, a.keyLen);
+          this.operate(MEET_BASE, a.key, a.keyStart, a.keyLen, hashed.a, step, a.value);
+        }
+        if (hasB) {
+          hashId(b.key, b.keyStart, b.keyLen);
+          this.operate(MEET_CAND, b.key, b.keyStart, b.keyLen, hashed.a, step, b.value);
         }
       }
+      this.step++;
+      if (this.strict || this.step - this.windowStart === this.tuning.window || batch.full)
+        this.settle();
       this.phase = ADVANCE_A;
     }
   }
 
-  flush(): void {
-    const { batch, diffs } = this;
-    for (let i = 0; i < this.batched; i++) diffs.push(batch[i] as number);
-    this.batched = 0;
+  /** Queues a table operation (applies it at once for a long id, which the table keeps apart). */
+  operate(
+    kind: number,
+    key: Uint8Array,
+    start: number,
+    len: number,
+    hash: number,
+    step: number,
+    value: number,
+  ): void {
+    if (kind === MEET_BASE || kind === MEET_CAND) this.ringUsed = !this.proportion;
+    if (len <= INLINE_ID_BYTES) this.batch.add(kind, key, start, len, hash, step, value);
+    else {
+      this.table.incoming = value;
+      this.table.incomingStep = step;
+      this.apply(kind, key, start, len, hash, step);
+    }
   }
 
-  private flushWith(d: number): void {
-    this.flush();
-    this.diffs.push(d);
+  /** Applies the batch and hands on the pairs of the window's steps, in order. */
+  settle(): void {
+    this.applyBatch();
+    if (this.ringUsed) {
+      const ring = this.ring;
+      const stop = (this.step - this.windowStart) * 3;
+      for (let i = 0; i < stop; i++) {
+        const d = ring[i] as number;
+        if (d === d) {
+          this.push(d);
+          ring[i] = Number.NaN;
+        }
+      }
+    }
+    this.windowStart = this.step;
+  }
+
+  applyBatch(): void {
+    const { batch, table } = this;
+    if (batch.size === 0) return;
+    table.prepare(batch.size, batch.longest);
+    const order = batch.sorted(table.mask, this.tuning.regionBits);
+    const keys = batch.keys;
+    for (let i = 0; i < batch.size; i++) {
+      const r = order[i] as number;
+      table.incoming = batch.value(r);
+      const step = batch.step(r);
+      table.incomingStep = step;
+      this.apply(batch.kind(r), keys, batch.keyStart(r), batch.len(r), batch.hash(r), step);
+    }
+    batch.clear();
+  }
+
+  /** One table operation; a pair it makes goes to the counts or the ring. */
+  private apply(
+    kind: number,
+    key: Uint8Array,
+    start: number,
+    len: number,
+    hash: number,
+    step: number,
+  ): void {
+    const table = this.table;
+    if (kind === TOGETHER) table.together(key, start, len, hash);
+    else if (kind === MARK_BASE || kind === MARK_CAND)
+      table.mark(kind === MARK_BASE ? BASE : CAND, key, start, len, hash);
+    else {
+      const base = kind === MEET_BASE;
+      if (!table.meet(base ? BASE : CAND, key, start, len, hash)) return;
+      this.rows++;
+      const x = base ? table.incoming : table.partner;
+      const y = base ? table.partner : table.incoming;
+      if (this.proportion) {
+        if (x === 1 && y === 0) this.baselineOnly++;
+        else if (x === 0 && y === 1) this.candidateOnly++;
+        return;
+      }
+      // The pair counts when its second row was read; the baseline's row first at equal steps.
+      const later = step > table.partnerStep;
+      const at = later ? step : table.partnerStep;
+      const k = base === later ? 1 : 2;
+      this.ring[(at - this.windowStart) * 3 + k] = y - x;
+    }
+  }
+
+  private push(d: number): void {
+    // RunningStats refuses a non-finite value: let it throw now, as it would have.
+    if (d - d !== 0) {
+      this.flush();
+      this.diffs.push(d);
+    }
+    this.pending[this.pendingCount++] = d;
+    if (this.pendingCount === BATCH) this.flush();
+  }
+
+  flush(): void {
+    const { pending, diffs } = this;
+    for (let i = 0; i < this.pendingCount; i++) diffs.push(pending[i] as number);
+    this.pendingCount = 0;
   }
 }
 
@@ -262,6 +364,7 @@ export async function pairPredictions(
   baseline: PredictionsFile,
   candidate: PredictionsFile,
   kind: MetricKind,
+  tuning: PairingTuning = TUNING,
 ): Promise<PairedPredictions & { unmatched: { baseline: number; candidate: number } }> {
   const opened: FileHandle[] = [];
   let a: PredictionLines | null = null;
@@ -272,12 +375,13 @@ export async function pairPredictions(
     a = new PredictionLines(base.reader(), baseline.file, kind);
     b = new PredictionLines(cand.reader(), candidate.file, kind);
     const table = new IdTable(kind === 'continuous');
-    const pairing = new Pairing(a, b, table, kind);
+    const pairing = new Pairing(a, b, table, kind, tuning);
     for (let r = pairing.run(); r !== DONE; r = pairing.run()) {
       if (r === NEED_A) await a.fill();
       else if (r === NEED_B) await b.fill();
       else {
         // A file's ids stopped increasing: keep every id from now on, its earlier ones included.
+        pairing.settle();
         const side = pairing.stopped;
         if (pairing.recorded === 0) {
           const estimate = (o: Opened, l: PredictionLines): number =>
@@ -286,17 +390,21 @@ export async function pairPredictions(
         }
         const lines = side === BASE ? a : b;
         const again = new PredictionLines((side === BASE ? base : cand).reader(), lines.file, kind);
+        const mark = side === BASE ? MARK_BASE : MARK_CAND;
         try {
           for (let n = lines.rows - 1; n > 0 && (await row(again)); n--) {
             hashId(again.key, again.keyStart, again.keyLen);
-            table.mark(side, again.key, again.keyStart, again.keyLen, hashed.a);
+            pairing.operate(mark, again.key, again.keyStart, again.keyLen, hashed.a, 0, 0);
+            if (pairing.batch.full) pairing.applyBatch();
           }
+          pairing.applyBatch();
         } finally {
           await again.close();
         }
         pairing.recorded |= side;
       }
     }
+    pairing.settle();
     pairing.flush();
 
     if (table.repeated !== 0) {

@@ -1,0 +1,122 @@
+/**
+ * A batch of id-table operations (rows out of step, ids of pairs, ids re-read), stored flat and
+ * applied grouped by the table region their id falls in. A million random probes into a table of
+ * tens of megabytes miss the cache and the TLB on almost every probe; a few thousand probes into
+ * one region of it mostly hit. Without a repeated id the result of the operations does not depend
+ * on their order (each id pairs with its one partner); where the order of pairs matters (losses),
+ * every operation carries the step its row was read at.
+ */
+
+/** Operation kinds. */
+export const MEET_BASE = 1;
+export const MEET_CAND = 2;
+export const TOGETHER = 3;
+export const MARK_BASE = 4;
+export const MARK_CAND = 5;
+
+/** Words per record before the id bytes: hash, step, len << 3 | kind. */
+const HEAD = 3;
+
+export class IdBatch {
+  size = 0;
+  /** Longest id in the batch. */
+  longest = 0;
+  private width = 16;
+  private stride = HEAD + 16 / 4;
+  private words: Uint32Array;
+  private bytes: Uint8Array;
+  private values: Float64Array;
+  private order: Int32Array;
+
+  constructor(readonly capacity: number) {
+    this.words = new Uint32Array(capacity * this.stride);
+    this.bytes = new Uint8Array(this.words.buffer);
+    this.values = new Float64Array(capacity);
+    this.order = new Int32Array(capacity);
+  }
+
+  get full(): boolean {
+    return this.size === this.capacity;
+  }
+
+  add(
+    kind: number,
+    key: Uint8Array,
+    start: number,
+    len: number,
+    hash: number,
+    step: number,
+    value: number,
+  ): void {
+    if (len > this.width) this.widen(len);
+    const r = this.size++;
+    const at = r * this.stride;
+    const words = this.words;
+    words[at] = hash;
+    words[at + 1] = step;
+    words[at + 2] = (len << 3) | kind;
+    const bytes = this.bytes;
+    for (let k = 0, b = (at + HEAD) * 4; k < len; k++) bytes[b + k] = key[start + k] as number;
+    this.values[r] = value;
+    if (len > this.longest) this.longest = len;
+  }
+
+  /** Record indices in order of `(hash & mask) >>> shift` (a counting sort); `size` of them. */
+  sorted(mask: number, shift: number): Int32Array {
+    const groups = (mask >>> shift) + 1;
+    const counts = new Int32Array(groups + 1);
+    const { words, stride, order, size } = this;
+    for (let r = 0; r < size; r++) {
+      const g = (((words[r * stride] as number) & mask) >>> shift) + 1;
+      counts[g] = (counts[g] as number) + 1;
+    }
+    for (let g = 1; g <= groups; g++) counts[g] = (counts[g] as number) + (counts[g - 1] as number);
+    for (let r = 0; r < size; r++) {
+      const g = ((words[r * stride] as number) & mask) >>> shift;
+      order[counts[g] as number] = r;
+      counts[g] = (counts[g] as number) + 1;
+    }
+    return order;
+  }
+
+  hash(r: number): number {
+    return this.words[r * this.stride] as number;
+  }
+  step(r: number): number {
+    return this.words[r * this.stride + 1] as number;
+  }
+  kind(r: number): number {
+    return (this.words[r * this.stride + 2] as number) & 7;
+  }
+  len(r: number): number {
+    return (this.words[r * this.stride + 2] as number) >>> 3;
+  }
+  /** Byte offset of record r's id in `keys`. */
+  keyStart(r: number): number {
+    return (r * this.stride + HEAD) * 4;
+  }
+  get keys(): Uint8Array {
+    return this.bytes;
+  }
+  value(r: number): number {
+    return this.values[r] as number;
+  }
+
+  clear(): void {
+    this.size = 0;
+    this.longest = 0;
+  }
+
+  private widen(len: number): void {
+    let width = this.width;
+    while (width < len) width *= 2;
+    const stride = HEAD + width / 4;
+    const words = new Uint32Array(this.capacity * stride);
+    for (let r = 0; r < this.size; r++)
+      words.set(this.words.subarray(r * this.stride, (r + 1) * this.stride), r * stride);
+    this.words = words;
+    this.bytes = new Uint8Array(words.buffer);
+    this.width = width;
+    this.stride = stride;
+  }
+}
