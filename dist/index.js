@@ -45677,14 +45677,15 @@ var BASE = 1;
 var CAND = 2;
 var BOTH = 3;
 var ONE = 4;
-var BITS = 3;
+var LEN_SHIFT = 3;
+var LEN_MASK = 255;
 var INLINE_ID_BYTES = 64;
+var LOAD = 0.75;
 var IdTable = class {
-  /** `losses`: values are numbers, not 0/1. `slots`: initial capacity, a power of two. */
-  constructor(losses, slots = 1 << 12) {
+  /** `losses`: values are numbers, not 0/1. `slots`: initial capacity. */
+  constructor(losses, slots = 4096) {
     this.losses = losses;
     this.cap = slots;
-    this.mask_ = slots - 1;
     this.words = new Uint32Array(slots * this.stride);
     this.bytes = new Uint8Array(this.words.buffer);
     this.values = losses ? new Float64Array(slots) : null;
@@ -45704,9 +45705,8 @@ var IdTable = class {
   incomingStep = 0;
   recording = false;
   cap;
-  mask_;
   width = 16;
-  stride = 2 + 16 / 4;
+  stride = 1 + 16 / 4;
   count = 0;
   words;
   bytes;
@@ -45714,23 +45714,30 @@ var IdTable = class {
   /** Steps of waiting loss rows (their order decides the order of the differences). */
   steps;
   long = /* @__PURE__ */ new Map();
-  /** Slot mask: an id's home slot is `hash & mask`. */
-  get mask() {
-    return this.mask_;
+  /** Number of slots; an id's home slot is `home(hash)`. */
+  get slots() {
+    return this.cap;
+  }
+  /** The home slot of a hash: ⌊hash · slots / 2^32⌋ (exact in doubles below 2^27 slots). */
+  home(hash) {
+    const cap = this.cap;
+    return Math.floor(((hash >>> 16) * cap + Math.floor((hash & 65535) * cap / 65536)) / 65536);
   }
   /** Room for `extra` more ids of up to `longest` bytes, so that no rebuild comes in between. */
   prepare(extra, longest) {
-    if (longest > this.width && longest <= INLINE_ID_BYTES) this.grow(longest);
-    this.reserve(this.count + extra);
+    const width = Math.min(longest, INLINE_ID_BYTES);
+    if (width > this.width || this.count + extra > this.cap * LOAD)
+      this.rebuild(Math.max(this.cap, Math.ceil((this.count + extra) / LOAD)), width);
   }
   /** Keep every id from now on; `expected`: about how many distinct ids will come. */
   recordAll(expected) {
     this.recording = true;
-    this.reserve(expected);
+    this.prepare(expected - this.count, 0);
   }
   /**
    * A row of `side` out of step with the other file: pairs with a waiting row of the other file
-   * (true; its value in `partner`) or waits (false). `incoming` holds the row's value.
+   * (true; its value and step in `partner`, `partnerStep`) or waits (false). `incoming` and
+   * `incomingStep` hold the row's value and step.
    */
   meet(side, key, start, len, hash) {
     if (len > INLINE_ID_BYTES) return this.longMeet(side, key, start, len);
@@ -45739,12 +45746,12 @@ var IdTable = class {
       this.insert(~slot, key, start, len, hash, side);
       return false;
     }
-    const at = slot * this.stride + 1;
+    const at = slot * this.stride;
     const word = this.words[at];
     const bits2 = word & BOTH;
     if ((bits2 & side) !== 0) {
       this.repeated |= side;
-      if (bits2 === side) this.store(slot, at, word, side);
+      if (bits2 === side) this.store(slot, word, side);
       return false;
     }
     if (this.values === null) this.partner = (word & ONE) >>> 2;
@@ -45753,18 +45760,14 @@ var IdTable = class {
       this.partnerStep = this.steps[slot];
     }
     this.count1(bits2, -1);
-    if (this.recording) this.words[at] = word & ~(ONE | BOTH) | BOTH;
+    if (this.recording) this.words[at] = (word & ~(ONE | BOTH) | BOTH) >>> 0;
     else this.remove(slot);
     return true;
   }
   /** Rows of both files with this id, in step (only while recording). */
   together(key, start, len, hash) {
     if (len > INLINE_ID_BYTES) {
-      const id = Buffer.from(key.buffer, key.byteOffset, key.byteLength).toString(
-        "latin1",
-        start,
-        start + len
-      );
+      const id = latin1(key, start, len);
       const entry = this.long.get(id);
       if (entry === void 0) this.long.set(id, { bits: BOTH, value: 0, step: 0 });
       else {
@@ -45775,10 +45778,7 @@ var IdTable = class {
     }
     const slot = this.find(key, start, len, hash);
     if (slot < 0) this.insert(~slot, key, start, len, hash, BOTH);
-    else {
-      const at = slot * this.stride + 1;
-      this.repeated |= this.words[at] & BOTH;
-    }
+    else this.repeated |= this.words[slot * this.stride] & BOTH;
   }
   /**
    * An id of `side` read before `recordAll` (re-read from the file's start): it paired then unless
@@ -45786,11 +45786,7 @@ var IdTable = class {
    */
   mark(side, key, start, len, hash) {
     if (len > INLINE_ID_BYTES) {
-      const id = Buffer.from(key.buffer, key.byteOffset, key.byteLength).toString(
-        "latin1",
-        start,
-        start + len
-      );
+      const id = latin1(key, start, len);
       const entry = this.long.get(id);
       if (entry === void 0) this.long.set(id, { bits: BOTH, value: 0, step: 0 });
       else if ((entry.bits & side) === 0) this.repeated |= entry.bits;
@@ -45799,16 +45795,12 @@ var IdTable = class {
     const slot = this.find(key, start, len, hash);
     if (slot < 0) this.insert(~slot, key, start, len, hash, BOTH);
     else {
-      const bits2 = this.words[slot * this.stride + 1] & BOTH;
+      const bits2 = this.words[slot * this.stride] & BOTH;
       if ((bits2 & side) === 0) this.repeated |= bits2;
     }
   }
   longMeet(side, key, start, len) {
-    const id = Buffer.from(key.buffer, key.byteOffset, key.byteLength).toString(
-      "latin1",
-      start,
-      start + len
-    );
+    const id = latin1(key, start, len);
     const entry = this.long.get(id);
     if (entry === void 0) {
       this.long.set(id, { bits: side, value: this.incoming, step: this.incomingStep });
@@ -45832,16 +45824,16 @@ var IdTable = class {
   }
   /** Slot of the id, or ~slot where it would go. */
   find(key, start, len, hash) {
-    if (len > this.width || (this.count + 1) * 10 > this.cap * 7) this.grow(len);
-    const { words, bytes, stride } = this;
-    const mask = this.mask_;
-    let i2 = hash & mask;
+    if (len > this.width || this.count + 1 > this.cap * LOAD) this.grow(len);
+    const { words, bytes, stride, cap } = this;
+    const want = ((hash & 65535) << 16 | len << LEN_SHIFT) >>> 0;
+    let i2 = this.home(hash);
     for (; ; ) {
       const at = i2 * stride;
-      const word = words[at + 1];
+      const word = words[at];
       if (word === 0) return ~i2;
-      if (word >>> BITS === len && words[at] === hash) {
-        let b = (at + 2) * 4;
+      if ((word & 4294967288) >>> 0 === want) {
+        let b = (at + 1) * 4;
         let k = start;
         const stop = start + len;
         while (k < stop && bytes[b] === key[k]) {
@@ -45850,22 +45842,23 @@ var IdTable = class {
         }
         if (k === stop) return i2;
       }
-      i2 = i2 + 1 & mask;
+      i2 = i2 + 1 === cap ? 0 : i2 + 1;
     }
   }
   insert(slot, key, start, len, hash, bits2) {
     const at = slot * this.stride;
-    this.words[at] = hash;
     const bytes = this.bytes;
-    for (let k = 0, b = (at + 2) * 4; k < len; k++) bytes[b + k] = key[start + k];
+    for (let k = 0, b = (at + 1) * 4; k < len; k++) bytes[b + k] = key[start + k];
     this.count++;
-    if (bits2 === BOTH) this.words[at + 1] = len << BITS | BOTH;
-    else this.store(slot, at + 1, len << BITS, bits2);
+    const word = ((hash & 65535) << 16 | len << LEN_SHIFT) >>> 0;
+    if (bits2 === BOTH) this.words[at] = (word | BOTH) >>> 0;
+    else this.store(slot, word, bits2);
   }
-  /** Makes the entry at `slot` a waiting row of `side` with the incoming value. */
-  store(slot, at, word, side) {
-    const base = word & ~(ONE | BOTH) | side;
-    if (this.values === null) this.words[at] = this.incoming === 1 ? base | ONE : base;
+  /** Makes the entry at `slot` a waiting row of `side` with the incoming value and step. */
+  store(slot, word, side) {
+    const base = (word & ~(ONE | BOTH) | side) >>> 0;
+    const at = slot * this.stride;
+    if (this.values === null) this.words[at] = this.incoming === 1 ? (base | ONE) >>> 0 : base;
     else {
       this.words[at] = base;
       this.values[slot] = this.incoming;
@@ -45877,17 +45870,21 @@ var IdTable = class {
     if (bits2 === BASE) this.waitingBase += by;
     else if (bits2 === CAND) this.waitingCand += by;
   }
+  /** The home slot of the entry at `slot` (its hash again, from its bytes). */
+  homeOf(slot) {
+    const at = slot * this.stride;
+    hashId(this.bytes, (at + 1) * 4, this.words[at] >>> LEN_SHIFT & LEN_MASK);
+    return this.home(hashed.a);
+  }
   remove(slot) {
-    const { words, values, steps, stride } = this;
-    const mask = this.mask_;
+    const { words, values, steps, stride, cap } = this;
     this.count--;
     let i2 = slot;
     let j = slot;
     for (; ; ) {
-      j = j + 1 & mask;
-      const word = words[j * stride + 1];
-      if (word === 0) break;
-      const home = words[j * stride] & mask;
+      j = j + 1 === cap ? 0 : j + 1;
+      if (words[j * stride] === 0) break;
+      const home = this.homeOf(j);
       if (i2 <= j ? i2 < home && home <= j : i2 < home || home <= j) continue;
       words.copyWithin(i2 * stride, j * stride, j * stride + stride);
       if (values !== null && steps !== null) {
@@ -45896,42 +45893,36 @@ var IdTable = class {
       }
       i2 = j;
     }
-    words[i2 * stride + 1] = 0;
-  }
-  /** Room for `n` entries at a load of at most 0.7. */
-  reserve(n) {
-    let cap = this.cap;
-    while (n * 10 > cap * 7) cap *= 2;
-    if (cap > this.cap) this.rebuild(cap, this.width);
+    words[i2 * stride] = 0;
   }
   grow(len) {
     let width = this.width;
     while (width < len) width *= 2;
-    const cap = (this.count + 1) * 10 > this.cap * 7 ? this.cap * 2 : this.cap;
+    const cap = this.count + 1 > this.cap * LOAD ? this.cap * 2 : this.cap;
     this.rebuild(cap, width);
   }
   rebuild(cap, width) {
-    const { words, values, steps, stride, cap: oldCap } = this;
+    const { words, bytes, values, steps, stride, cap: oldCap } = this;
+    let w = this.width;
+    while (w < width) w *= 2;
     this.cap = cap;
-    this.mask_ = cap - 1;
-    this.width = width;
-    this.stride = 2 + width / 4;
+    this.width = w;
+    this.stride = 1 + w / 4;
     this.words = new Uint32Array(cap * this.stride);
     this.bytes = new Uint8Array(this.words.buffer);
     this.values = values === null ? null : new Float64Array(cap);
     this.steps = steps === null ? null : new Uint32Array(cap);
-    const keyWords = stride - 2;
+    const keyWords = stride - 1;
     for (let s = 0; s < oldCap; s++) {
-      const word = words[s * stride + 1];
+      const word = words[s * stride];
       if (word === 0) continue;
-      const hash = words[s * stride];
-      let i2 = hash & this.mask_;
-      while (this.words[i2 * this.stride + 1] !== 0) i2 = i2 + 1 & this.mask_;
+      hashId(bytes, (s * stride + 1) * 4, word >>> LEN_SHIFT & LEN_MASK);
+      let i2 = this.home(hashed.a);
+      while (this.words[i2 * this.stride] !== 0) i2 = i2 + 1 === cap ? 0 : i2 + 1;
       const at = i2 * this.stride;
-      this.words[at] = hash;
-      this.words[at + 1] = word;
-      for (let w = 0; w < keyWords; w++)
-        this.words[at + 2 + w] = words[s * stride + 2 + w];
+      this.words[at] = word;
+      for (let k = 0; k < keyWords; k++)
+        this.words[at + 1 + k] = words[s * stride + 1 + k];
       if (this.values !== null && values !== null && this.steps !== null && steps !== null) {
         this.values[i2] = values[s];
         this.steps[i2] = steps[s];
@@ -45939,6 +45930,13 @@ var IdTable = class {
     }
   }
 };
+function latin1(key, start, len) {
+  return Buffer.from(key.buffer, key.byteOffset, key.byteLength).toString(
+    "latin1",
+    start,
+    start + len
+  );
+}
 
 // src/artifact/id-batch.ts
 var MEET_BASE = 1;
@@ -45965,6 +45963,7 @@ var IdBatch = class {
   bytes;
   values;
   order;
+  group = new Int32Array(0);
   get full() {
     return this.size === this.capacity;
   }
@@ -45981,18 +45980,20 @@ var IdBatch = class {
     this.values[r] = value;
     if (len > this.longest) this.longest = len;
   }
-  /** Record indices in order of `(hash & mask) >>> shift` (a counting sort); `size` of them. */
-  sorted(mask, shift) {
-    const groups2 = (mask >>> shift) + 1;
+  /** Record indices in order of their home slot in `table` >>> shift (a counting sort). */
+  sorted(table2, shift) {
+    const groups2 = (table2.slots - 1 >>> shift) + 1;
     const counts = new Int32Array(groups2 + 1);
     const { words, stride, order, size } = this;
+    const group = this.group.length < size ? this.group = new Int32Array(this.capacity) : this.group;
     for (let r = 0; r < size; r++) {
-      const g = ((words[r * stride] & mask) >>> shift) + 1;
-      counts[g] = counts[g] + 1;
+      const g = table2.home(words[r * stride]) >>> shift;
+      group[r] = g;
+      counts[g + 1] = counts[g + 1] + 1;
     }
     for (let g = 1; g <= groups2; g++) counts[g] = counts[g] + counts[g - 1];
     for (let r = 0; r < size; r++) {
-      const g = (words[r * stride] & mask) >>> shift;
+      const g = group[r];
       order[counts[g]] = r;
       counts[g] = counts[g] + 1;
     }
@@ -46645,7 +46646,7 @@ var Pairing = class {
     const { batch, table: table2 } = this;
     if (batch.size === 0) return;
     table2.prepare(batch.size, batch.longest);
-    const order = batch.sorted(table2.mask, this.tuning.regionBits);
+    const order = batch.sorted(table2, this.tuning.regionBits);
     const keys = batch.keys;
     for (let i2 = 0; i2 < batch.size; i2++) {
       const r = order[i2];

@@ -27,6 +27,7 @@ export class IdBatch {
   private bytes: Uint8Array;
   private values: Float64Array;
   private order: Int32Array;
+  private group = new Int32Array(0);
 
   constructor(readonly capacity: number) {
     this.words = new Uint32Array(capacity * this.stride);
@@ -61,18 +62,21 @@ export class IdBatch {
     if (len > this.longest) this.longest = len;
   }
 
-  /** Record indices in order of `(hash & mask) >>> shift` (a counting sort); `size` of them. */
-  sorted(mask: number, shift: number): Int32Array {
-    const groups = (mask >>> shift) + 1;
+  /** Record indices in order of their home slot in `table` >>> shift (a counting sort). */
+  sorted(table: { slots: number; home(hash: number): number }, shift: number): Int32Array {
+    const groups = ((table.slots - 1) >>> shift) + 1;
     const counts = new Int32Array(groups + 1);
     const { words, stride, order, size } = this;
+    const group =
+      this.group.length < size ? (this.group = new Int32Array(this.capacity)) : this.group;
     for (let r = 0; r < size; r++) {
-      const g = (((words[r * stride] as number) & mask) >>> shift) + 1;
-      counts[g] = (counts[g] as number) + 1;
+      const g = table.home(words[r * stride] as number) >>> shift;
+      group[r] = g;
+      counts[g + 1] = (counts[g + 1] as number) + 1;
     }
     for (let g = 1; g <= groups; g++) counts[g] = (counts[g] as number) + (counts[g - 1] as number);
     for (let r = 0; r < size; r++) {
-      const g = ((words[r * stride] as number) & mask) >>> shift;
+      const g = group[r] as number;
       order[counts[g] as number] = r;
       counts[g] = (counts[g] as number) + 1;
     }

@@ -127,15 +127,21 @@ export const CAND = 2;
 const BOTH = 3;
 /** Entry bit: the value (0/1) of a waiting proportion row. */
 const ONE = 4;
-const BITS = 3; // entry word: len << BITS | ONE? | CAND? | BASE?
+/** Entry word: hash & 0xffff << 16 | len << 3 | ONE? | CAND? | BASE? (0: empty slot). */
+const LEN_SHIFT = 3;
+const LEN_MASK = 0xff;
 /** Ids up to this many bytes are stored inline; longer ones (rare) in a Map. */
 export const INLINE_ID_BYTES = 64;
+/** Entries per slot at most. */
+const LOAD = 0.75;
 
 /**
  * The ids of both files, keyed on their bytes: open addressing with linear probing, each slot one
- * run of 32-bit words (hash, length and bits, then the id bytes inline at a fixed width that widens
- * up to INLINE_ID_BYTES), so that a probe reads one cache line. An entry's bits say which files
- * have the id: one bit, a row waiting for its partner (with its value); both, a pair.
+ * word (16 bits of hash, length, bits) and the id bytes inline at a fixed width (widened up to
+ * INLINE_ID_BYTES), 20 bytes for ids up to 16 bytes. Slots are as many as needed (not a power of
+ * two; an id's home slot is its hash scaled to the table), as every page of a large table is
+ * memory the process must be given. An entry's bits say which files have the id: one bit, a row
+ * waiting for its partner (with its value); both, a pair.
  *
  * While both files' ids keep increasing, only waiting rows are kept and a pair deletes its entry
  * (backward-shift deletion, no tombstones). From the first id out of order (`recordAll`) every id
@@ -157,9 +163,8 @@ export class IdTable {
   incomingStep = 0;
   private recording = false;
   private cap: number;
-  private mask_: number;
   private width = 16;
-  private stride = 2 + 16 / 4;
+  private stride = 1 + 16 / 4;
   private count = 0;
   private words: Uint32Array;
   private bytes: Uint8Array;
@@ -168,39 +173,46 @@ export class IdTable {
   private steps: Uint32Array | null;
   private readonly long = new Map<string, { bits: number; value: number; step: number }>();
 
-  /** `losses`: values are numbers, not 0/1. `slots`: initial capacity, a power of two. */
+  /** `losses`: values are numbers, not 0/1. `slots`: initial capacity. */
   constructor(
     private readonly losses: boolean,
-    slots = 1 << 12,
+    slots = 4096,
   ) {
     this.cap = slots;
-    this.mask_ = slots - 1;
     this.words = new Uint32Array(slots * this.stride);
     this.bytes = new Uint8Array(this.words.buffer);
     this.values = losses ? new Float64Array(slots) : null;
     this.steps = losses ? new Uint32Array(slots) : null;
   }
 
-  /** Slot mask: an id's home slot is `hash & mask`. */
-  get mask(): number {
-    return this.mask_;
+  /** Number of slots; an id's home slot is `home(hash)`. */
+  get slots(): number {
+    return this.cap;
+  }
+
+  /** The home slot of a hash: ⌊hash · slots / 2^32⌋ (exact in doubles below 2^27 slots). */
+  home(hash: number): number {
+    const cap = this.cap;
+    return Math.floor(((hash >>> 16) * cap + Math.floor(((hash & 0xffff) * cap) / 65536)) / 65536);
   }
 
   /** Room for `extra` more ids of up to `longest` bytes, so that no rebuild comes in between. */
   prepare(extra: number, longest: number): void {
-    if (longest > this.width && longest <= INLINE_ID_BYTES) this.grow(longest);
-    this.reserve(this.count + extra);
+    const width = Math.min(longest, INLINE_ID_BYTES);
+    if (width > this.width || this.count + extra > this.cap * LOAD)
+      this.rebuild(Math.max(this.cap, Math.ceil((this.count + extra) / LOAD)), width);
   }
 
   /** Keep every id from now on; `expected`: about how many distinct ids will come. */
   recordAll(expected: number): void {
     this.recording = true;
-    this.reserve(expected);
+    this.prepare(expected - this.count, 0);
   }
 
   /**
    * A row of `side` out of step with the other file: pairs with a waiting row of the other file
-   * (true; its value in `partner`) or waits (false). `incoming` holds the row's value.
+   * (true; its value and step in `partner`, `partnerStep`) or waits (false). `incoming` and
+   * `incomingStep` hold the row's value and step.
    */
   meet(side: number, key: Uint8Array, start: number, len: number, hash: number): boolean {
     if (len > INLINE_ID_BYTES) return this.longMeet(side, key, start, len);
@@ -209,12 +221,12 @@ export class IdTable {
       this.insert(~slot, key, start, len, hash, side);
       return false;
     }
-    const at = slot * this.stride + 1;
+    const at = slot * this.stride;
     const word = this.words[at] as number;
     const bits = word & BOTH;
     if ((bits & side) !== 0) {
       this.repeated |= side;
-      if (bits === side) this.store(slot, at, word, side); // the old Map.set: replace the value
+      if (bits === side) this.store(slot, word, side); // the old Map.set: replace the value
       return false;
     }
     if (this.values === null) this.partner = (word & ONE) >>> 2;
@@ -223,7 +235,7 @@ export class IdTable {
       this.partnerStep = (this.steps as Uint32Array)[slot] as number;
     }
     this.count1(bits, -1);
-    if (this.recording) this.words[at] = (word & ~(ONE | BOTH)) | BOTH;
+    if (this.recording) this.words[at] = ((word & ~(ONE | BOTH)) | BOTH) >>> 0;
     else this.remove(slot);
     return true;
   }
@@ -231,11 +243,7 @@ export class IdTable {
   /** Rows of both files with this id, in step (only while recording). */
   together(key: Uint8Array, start: number, len: number, hash: number): void {
     if (len > INLINE_ID_BYTES) {
-      const id = Buffer.from(key.buffer, key.byteOffset, key.byteLength).toString(
-        'latin1',
-        start,
-        start + len,
-      );
+      const id = latin1(key, start, len);
       const entry = this.long.get(id);
       if (entry === undefined) this.long.set(id, { bits: BOTH, value: 0, step: 0 });
       else {
@@ -246,10 +254,7 @@ export class IdTable {
     }
     const slot = this.find(key, start, len, hash);
     if (slot < 0) this.insert(~slot, key, start, len, hash, BOTH);
-    else {
-      const at = slot * this.stride + 1;
-      this.repeated |= (this.words[at] as number) & BOTH;
-    }
+    else this.repeated |= (this.words[slot * this.stride] as number) & BOTH;
   }
 
   /**
@@ -258,11 +263,7 @@ export class IdTable {
    */
   mark(side: number, key: Uint8Array, start: number, len: number, hash: number): void {
     if (len > INLINE_ID_BYTES) {
-      const id = Buffer.from(key.buffer, key.byteOffset, key.byteLength).toString(
-        'latin1',
-        start,
-        start + len,
-      );
+      const id = latin1(key, start, len);
       const entry = this.long.get(id);
       if (entry === undefined) this.long.set(id, { bits: BOTH, value: 0, step: 0 });
       else if ((entry.bits & side) === 0) this.repeated |= entry.bits;
@@ -271,17 +272,13 @@ export class IdTable {
     const slot = this.find(key, start, len, hash);
     if (slot < 0) this.insert(~slot, key, start, len, hash, BOTH);
     else {
-      const bits = (this.words[slot * this.stride + 1] as number) & BOTH;
+      const bits = (this.words[slot * this.stride] as number) & BOTH;
       if ((bits & side) === 0) this.repeated |= bits;
     }
   }
 
   private longMeet(side: number, key: Uint8Array, start: number, len: number): boolean {
-    const id = Buffer.from(key.buffer, key.byteOffset, key.byteLength).toString(
-      'latin1',
-      start,
-      start + len,
-    );
+    const id = latin1(key, start, len);
     const entry = this.long.get(id);
     if (entry === undefined) {
       this.long.set(id, { bits: side, value: this.incoming, step: this.incomingStep });
@@ -306,16 +303,16 @@ export class IdTable {
 
   /** Slot of the id, or ~slot where it would go. */
   private find(key: Uint8Array, start: number, len: number, hash: number): number {
-    if (len > this.width || (this.count + 1) * 10 > this.cap * 7) this.grow(len);
-    const { words, bytes, stride } = this;
-    const mask = this.mask_;
-    let i = hash & mask;
+    if (len > this.width || this.count + 1 > this.cap * LOAD) this.grow(len);
+    const { words, bytes, stride, cap } = this;
+    const want = (((hash & 0xffff) << 16) | (len << LEN_SHIFT)) >>> 0;
+    let i = this.home(hash);
     for (;;) {
       const at = i * stride;
-      const word = words[at + 1] as number;
+      const word = words[at] as number;
       if (word === 0) return ~i;
-      if (word >>> BITS === len && words[at] === hash) {
-        let b = (at + 2) * 4;
+      if ((word & 0xfffffff8) >>> 0 === want) {
+        let b = (at + 1) * 4;
         let k = start;
         const stop = start + len;
         while (k < stop && bytes[b] === key[k]) {
@@ -324,7 +321,7 @@ export class IdTable {
         }
         if (k === stop) return i;
       }
-      i = (i + 1) & mask;
+      i = i + 1 === cap ? 0 : i + 1;
     }
   }
 
@@ -337,18 +334,19 @@ export class IdTable {
     bits: number,
   ): void {
     const at = slot * this.stride;
-    this.words[at] = hash;
     const bytes = this.bytes;
-    for (let k = 0, b = (at + 2) * 4; k < len; k++) bytes[b + k] = key[start + k] as number;
+    for (let k = 0, b = (at + 1) * 4; k < len; k++) bytes[b + k] = key[start + k] as number;
     this.count++;
-    if (bits === BOTH) this.words[at + 1] = (len << BITS) | BOTH;
-    else this.store(slot, at + 1, len << BITS, bits);
+    const word = (((hash & 0xffff) << 16) | (len << LEN_SHIFT)) >>> 0;
+    if (bits === BOTH) this.words[at] = (word | BOTH) >>> 0;
+    else this.store(slot, word, bits);
   }
 
-  /** Makes the entry at `slot` a waiting row of `side` with the incoming value. */
-  private store(slot: number, at: number, word: number, side: number): void {
-    const base = (word & ~(ONE | BOTH)) | side;
-    if (this.values === null) this.words[at] = this.incoming === 1 ? base | ONE : base;
+  /** Makes the entry at `slot` a waiting row of `side` with the incoming value and step. */
+  private store(slot: number, word: number, side: number): void {
+    const base = ((word & ~(ONE | BOTH)) | side) >>> 0;
+    const at = slot * this.stride;
+    if (this.values === null) this.words[at] = this.incoming === 1 ? (base | ONE) >>> 0 : base;
     else {
       this.words[at] = base;
       this.values[slot] = this.incoming;
@@ -362,17 +360,22 @@ export class IdTable {
     else if (bits === CAND) this.waitingCand += by;
   }
 
+  /** The home slot of the entry at `slot` (its hash again, from its bytes). */
+  private homeOf(slot: number): number {
+    const at = slot * this.stride;
+    hashId(this.bytes, (at + 1) * 4, ((this.words[at] as number) >>> LEN_SHIFT) & LEN_MASK);
+    return this.home(hashed.a);
+  }
+
   private remove(slot: number): void {
-    const { words, values, steps, stride } = this;
-    const mask = this.mask_;
+    const { words, values, steps, stride, cap } = this;
     this.count--;
     let i = slot;
     let j = slot;
     for (;;) {
-      j = (j + 1) & mask;
-      const word = words[j * stride + 1] as number;
-      if (word === 0) break;
-      const home = (words[j * stride] as number) & mask;
+      j = j + 1 === cap ? 0 : j + 1;
+      if (words[j * stride] === 0) break;
+      const home = this.homeOf(j);
       // Leave j where it is when its home slot lies cyclically in (i, j].
       if (i <= j ? i < home && home <= j : i < home || home <= j) continue;
       words.copyWithin(i * stride, j * stride, j * stride + stride);
@@ -382,49 +385,50 @@ export class IdTable {
       }
       i = j;
     }
-    words[i * stride + 1] = 0;
-  }
-
-  /** Room for `n` entries at a load of at most 0.7. */
-  private reserve(n: number): void {
-    let cap = this.cap;
-    while (n * 10 > cap * 7) cap *= 2;
-    if (cap > this.cap) this.rebuild(cap, this.width);
+    words[i * stride] = 0;
   }
 
   private grow(len: number): void {
     let width = this.width;
     while (width < len) width *= 2;
-    const cap = (this.count + 1) * 10 > this.cap * 7 ? this.cap * 2 : this.cap;
+    const cap = this.count + 1 > this.cap * LOAD ? this.cap * 2 : this.cap;
     this.rebuild(cap, width);
   }
 
   private rebuild(cap: number, width: number): void {
-    const { words, values, steps, stride, cap: oldCap } = this;
+    const { words, bytes, values, steps, stride, cap: oldCap } = this;
+    let w = this.width;
+    while (w < width) w *= 2;
     this.cap = cap;
-    this.mask_ = cap - 1;
-    this.width = width;
-    this.stride = 2 + width / 4;
+    this.width = w;
+    this.stride = 1 + w / 4;
     this.words = new Uint32Array(cap * this.stride);
     this.bytes = new Uint8Array(this.words.buffer);
     this.values = values === null ? null : new Float64Array(cap);
     this.steps = steps === null ? null : new Uint32Array(cap);
-    const keyWords = stride - 2;
+    const keyWords = stride - 1;
     for (let s = 0; s < oldCap; s++) {
-      const word = words[s * stride + 1] as number;
+      const word = words[s * stride] as number;
       if (word === 0) continue;
-      const hash = words[s * stride] as number;
-      let i = hash & this.mask_;
-      while (this.words[i * this.stride + 1] !== 0) i = (i + 1) & this.mask_;
+      hashId(bytes, (s * stride + 1) * 4, (word >>> LEN_SHIFT) & LEN_MASK);
+      let i = this.home(hashed.a);
+      while (this.words[i * this.stride] !== 0) i = i + 1 === cap ? 0 : i + 1;
       const at = i * this.stride;
-      this.words[at] = hash;
-      this.words[at + 1] = word;
-      for (let w = 0; w < keyWords; w++)
-        this.words[at + 2 + w] = words[s * stride + 2 + w] as number;
+      this.words[at] = word;
+      for (let k = 0; k < keyWords; k++)
+        this.words[at + 1 + k] = words[s * stride + 1 + k] as number;
       if (this.values !== null && values !== null && this.steps !== null && steps !== null) {
         this.values[i] = values[s] as number;
         this.steps[i] = steps[s] as number;
       }
     }
   }
+}
+
+function latin1(key: Uint8Array, start: number, len: number): string {
+  return Buffer.from(key.buffer, key.byteOffset, key.byteLength).toString(
+    'latin1',
+    start,
+    start + len,
+  );
 }

@@ -298,7 +298,7 @@ class Pairing {
     const { batch, table } = this;
     if (batch.size === 0) return;
     table.prepare(batch.size, batch.longest);
-    const order = batch.sorted(table.mask, this.tuning.regionBits);
+    const order = batch.sorted(table, this.tuning.regionBits);
     const keys = batch.keys;
     for (let i = 0; i < batch.size; i++) {
       const r = order[i] as number;

@@ -24,8 +24,8 @@ const ids = fc.oneof(
 );
 
 describe('IdTable', () => {
-  for (const collide of [false, true]) {
-    it(`pairs like the original two Maps${collide ? ' when every hash collides' : ''} (property)`, () => {
+  {
+    it('pairs like the original two Maps, in a table that starts tiny (property)', () => {
       expect(`${'long-'.repeat(15)}0`.length).toBeGreaterThan(INLINE_ID_BYTES);
       fc.assert(
         fc.property(
@@ -52,7 +52,7 @@ describe('IdTable', () => {
               const key = Buffer.from(`..${id}`);
               hashId(key, 2, key.length - 2);
               table.incoming = value;
-              const met = table.meet(side, key, 2, key.length - 2, collide ? 7 : hashed.a);
+              const met = table.meet(side, key, 2, key.length - 2, hashed.a);
               const mine = seen.get(side) as Set<string>;
               // Recording, every id a file had is remembered; else only waiting ones are.
               const before = record
