@@ -45678,7 +45678,6 @@ var CAND = 2;
 var BOTH = 3;
 var ONE = 4;
 var LEN_SHIFT = 3;
-var LEN_MASK = 255;
 var INLINE_ID_BYTES = 64;
 var LOAD = 0.75;
 var IdTable = class {
@@ -45703,10 +45702,11 @@ var IdTable = class {
   /** The value and step of the arriving row, for `meet` (fields: a double argument is boxed). */
   incoming = 0;
   incomingStep = 0;
-  recording = false;
+  /** About how many rows will wait at most (0: unknown); read when the table must grow. */
+  expected = 0;
   cap;
   width = 16;
-  stride = 1 + 16 / 4;
+  stride = 2 + 16 / 4;
   count = 0;
   words;
   bytes;
@@ -45723,16 +45723,9 @@ var IdTable = class {
     const cap = this.cap;
     return Math.floor(((hash >>> 16) * cap + Math.floor((hash & 65535) * cap / 65536)) / 65536);
   }
-  /** Room for `extra` more ids of up to `longest` bytes, so that no rebuild comes in between. */
-  prepare(extra, longest) {
-    const width = Math.min(longest, INLINE_ID_BYTES);
-    if (width > this.width || this.count + extra > this.cap * LOAD)
-      this.rebuild(Math.max(this.cap, Math.ceil((this.count + extra) / LOAD)), width);
-  }
-  /** Keep every id from now on; `expected`: about how many distinct ids will come. */
-  recordAll(expected) {
-    this.recording = true;
-    this.prepare(expected - this.count, 0);
+  /** Room for ids of up to `longest` bytes (so that no rebuild comes in the middle of a batch). */
+  widen(longest) {
+    if (longest > this.width && longest <= INLINE_ID_BYTES) this.rebuild(this.cap, longest);
   }
   /**
    * A row of `side` out of step with the other file: pairs with a waiting row of the other file
@@ -45746,7 +45739,7 @@ var IdTable = class {
       this.insert(~slot, key, start, len, hash, side);
       return false;
     }
-    const at = slot * this.stride;
+    const at = slot * this.stride + 1;
     const word = this.words[at];
     const bits2 = word & BOTH;
     if ((bits2 & side) !== 0) {
@@ -45760,44 +45753,8 @@ var IdTable = class {
       this.partnerStep = this.steps[slot];
     }
     this.count1(bits2, -1);
-    if (this.recording) this.words[at] = (word & ~(ONE | BOTH) | BOTH) >>> 0;
-    else this.remove(slot);
+    this.remove(slot);
     return true;
-  }
-  /** Rows of both files with this id, in step (only while recording). */
-  together(key, start, len, hash) {
-    if (len > INLINE_ID_BYTES) {
-      const id = latin1(key, start, len);
-      const entry = this.long.get(id);
-      if (entry === void 0) this.long.set(id, { bits: BOTH, value: 0, step: 0 });
-      else {
-        this.repeated |= entry.bits;
-        entry.bits = BOTH;
-      }
-      return;
-    }
-    const slot = this.find(key, start, len, hash);
-    if (slot < 0) this.insert(~slot, key, start, len, hash, BOTH);
-    else this.repeated |= this.words[slot * this.stride] & BOTH;
-  }
-  /**
-   * An id of `side` read before `recordAll` (re-read from the file's start): it paired then unless
-   * it still waits. Waiting from the other file, though, means that file has it twice.
-   */
-  mark(side, key, start, len, hash) {
-    if (len > INLINE_ID_BYTES) {
-      const id = latin1(key, start, len);
-      const entry = this.long.get(id);
-      if (entry === void 0) this.long.set(id, { bits: BOTH, value: 0, step: 0 });
-      else if ((entry.bits & side) === 0) this.repeated |= entry.bits;
-      return;
-    }
-    const slot = this.find(key, start, len, hash);
-    if (slot < 0) this.insert(~slot, key, start, len, hash, BOTH);
-    else {
-      const bits2 = this.words[slot * this.stride] & BOTH;
-      if ((bits2 & side) === 0) this.repeated |= bits2;
-    }
   }
   longMeet(side, key, start, len) {
     const id = latin1(key, start, len);
@@ -45818,22 +45775,20 @@ var IdTable = class {
     this.partner = entry.value;
     this.partnerStep = entry.step;
     this.count1(entry.bits, -1);
-    if (this.recording) entry.bits = BOTH;
-    else this.long.delete(id);
+    this.long.delete(id);
     return true;
   }
   /** Slot of the id, or ~slot where it would go. */
   find(key, start, len, hash) {
     if (len > this.width || this.count + 1 > this.cap * LOAD) this.grow(len);
     const { words, bytes, stride, cap } = this;
-    const want = ((hash & 65535) << 16 | len << LEN_SHIFT) >>> 0;
     let i2 = this.home(hash);
     for (; ; ) {
       const at = i2 * stride;
-      const word = words[at];
+      const word = words[at + 1];
       if (word === 0) return ~i2;
-      if ((word & 4294967288) >>> 0 === want) {
-        let b = (at + 1) * 4;
+      if (word >>> LEN_SHIFT === len && words[at] === hash) {
+        let b = (at + 2) * 4;
         let k = start;
         const stop = start + len;
         while (k < stop && bytes[b] === key[k]) {
@@ -45848,17 +45803,16 @@ var IdTable = class {
   insert(slot, key, start, len, hash, bits2) {
     const at = slot * this.stride;
     const bytes = this.bytes;
-    for (let k = 0, b = (at + 1) * 4; k < len; k++) bytes[b + k] = key[start + k];
+    for (let k = 0, b = (at + 2) * 4; k < len; k++) bytes[b + k] = key[start + k];
     this.count++;
-    const word = ((hash & 65535) << 16 | len << LEN_SHIFT) >>> 0;
-    if (bits2 === BOTH) this.words[at] = (word | BOTH) >>> 0;
-    else this.store(slot, word, bits2);
+    this.words[at] = hash;
+    this.store(slot, len << LEN_SHIFT, bits2);
   }
   /** Makes the entry at `slot` a waiting row of `side` with the incoming value and step. */
   store(slot, word, side) {
-    const base = (word & ~(ONE | BOTH) | side) >>> 0;
-    const at = slot * this.stride;
-    if (this.values === null) this.words[at] = this.incoming === 1 ? (base | ONE) >>> 0 : base;
+    const base = word & ~(ONE | BOTH) | side;
+    const at = slot * this.stride + 1;
+    if (this.values === null) this.words[at] = this.incoming === 1 ? base | ONE : base;
     else {
       this.words[at] = base;
       this.values[slot] = this.incoming;
@@ -45870,12 +45824,6 @@ var IdTable = class {
     if (bits2 === BASE) this.waitingBase += by;
     else if (bits2 === CAND) this.waitingCand += by;
   }
-  /** The home slot of the entry at `slot` (its hash again, from its bytes). */
-  homeOf(slot) {
-    const at = slot * this.stride;
-    hashId(this.bytes, (at + 1) * 4, this.words[at] >>> LEN_SHIFT & LEN_MASK);
-    return this.home(hashed.a);
-  }
   remove(slot) {
     const { words, values, steps, stride, cap } = this;
     this.count--;
@@ -45883,8 +45831,8 @@ var IdTable = class {
     let j = slot;
     for (; ; ) {
       j = j + 1 === cap ? 0 : j + 1;
-      if (words[j * stride] === 0) break;
-      const home = this.homeOf(j);
+      if (words[j * stride + 1] === 0) break;
+      const home = this.home(words[j * stride]);
       if (i2 <= j ? i2 < home && home <= j : i2 < home || home <= j) continue;
       words.copyWithin(i2 * stride, j * stride, j * stride + stride);
       if (values !== null && steps !== null) {
@@ -45893,36 +45841,37 @@ var IdTable = class {
       }
       i2 = j;
     }
-    words[i2 * stride] = 0;
+    words[i2 * stride + 1] = 0;
   }
   grow(len) {
-    let width = this.width;
-    while (width < len) width *= 2;
-    const cap = this.count + 1 > this.cap * LOAD ? this.cap * 2 : this.cap;
-    this.rebuild(cap, width);
+    let cap = this.cap;
+    if (this.count + 1 > cap * LOAD)
+      cap = Math.max(2 * cap, Math.ceil(Math.min(this.expected, 4 * this.count) / LOAD));
+    this.rebuild(cap, len);
   }
   rebuild(cap, width) {
-    const { words, bytes, values, steps, stride, cap: oldCap } = this;
+    const { words, values, steps, stride, cap: oldCap } = this;
     let w = this.width;
     while (w < width) w *= 2;
     this.cap = cap;
     this.width = w;
-    this.stride = 1 + w / 4;
+    this.stride = 2 + w / 4;
     this.words = new Uint32Array(cap * this.stride);
     this.bytes = new Uint8Array(this.words.buffer);
     this.values = values === null ? null : new Float64Array(cap);
     this.steps = steps === null ? null : new Uint32Array(cap);
-    const keyWords = stride - 1;
+    const keyWords = stride - 2;
     for (let s = 0; s < oldCap; s++) {
-      const word = words[s * stride];
+      const word = words[s * stride + 1];
       if (word === 0) continue;
-      hashId(bytes, (s * stride + 1) * 4, word >>> LEN_SHIFT & LEN_MASK);
-      let i2 = this.home(hashed.a);
-      while (this.words[i2 * this.stride] !== 0) i2 = i2 + 1 === cap ? 0 : i2 + 1;
+      const hash = words[s * stride];
+      let i2 = this.home(hash);
+      while (this.words[i2 * this.stride + 1] !== 0) i2 = i2 + 1 === cap ? 0 : i2 + 1;
       const at = i2 * this.stride;
-      this.words[at] = word;
+      this.words[at] = hash;
+      this.words[at + 1] = word;
       for (let k = 0; k < keyWords; k++)
-        this.words[at + 1 + k] = words[s * stride + 1 + k];
+        this.words[at + 2 + k] = words[s * stride + 2 + k];
       if (this.values !== null && values !== null && this.steps !== null && steps !== null) {
         this.values[i2] = values[s];
         this.steps[i2] = steps[s];
@@ -45941,9 +45890,6 @@ function latin1(key, start, len) {
 // src/artifact/id-batch.ts
 var MEET_BASE = 1;
 var MEET_CAND = 2;
-var TOGETHER = 3;
-var MARK_BASE = 4;
-var MARK_CAND = 5;
 var HEAD = 3;
 var IdBatch = class {
   constructor(capacity) {
@@ -46508,7 +46454,6 @@ async function repeatedIds(o, file, kind) {
 var DONE = 0;
 var NEED_A = 1;
 var NEED_B = 2;
-var RECORD = 3;
 var ADVANCE_A = 0;
 var ADVANCE_B = 1;
 var PAIR = 2;
@@ -46516,11 +46461,12 @@ var BATCH = 4096;
 var TUNING = { window: 32768, regionBits: 12 };
 var HUGE = 8e307;
 var Pairing = class {
-  constructor(a, b, table2, kind, tuning) {
+  constructor(a, b, table2, kind, tuning, sizes) {
     this.a = a;
     this.b = b;
     this.table = table2;
     this.tuning = tuning;
+    this.sizes = sizes;
     this.proportion = kind === "proportion";
     this.batch = new IdBatch(2 * tuning.window);
     this.ring = new Float64Array(this.proportion ? 0 : 3 * tuning.window).fill(Number.NaN);
@@ -46529,14 +46475,13 @@ var Pairing = class {
   b;
   table;
   tuning;
+  sizes;
   rows = 0;
   baselineOnly = 0;
   candidateOnly = 0;
   diffs = new RunningStats();
-  /** Files (BASE | CAND) whose ids stopped increasing and are all in the table. */
-  recorded = 0;
-  /** The file that `run()` returned RECORD for. */
-  stopped = 0;
+  /** Files (BASE | CAND) whose ids stopped increasing. */
+  unordered = 0;
   batch;
   hasA = true;
   hasB = true;
@@ -46574,24 +46519,16 @@ var Pairing = class {
       const hasA = this.hasA;
       const hasB = this.hasB;
       if (!hasA && !hasB) return DONE;
-      if (hasA && (this.recorded & BASE) === 0 && !this.orderA.next(a.key, a.keyStart, a.keyLen, a.prevKey, a.prevStart, a.prevLen)) {
-        this.stopped = BASE;
-        return RECORD;
-      }
-      if (hasB && (this.recorded & CAND) === 0 && !this.orderB.next(b.key, b.keyStart, b.keyLen, b.prevKey, b.prevStart, b.prevLen)) {
-        this.stopped = CAND;
-        return RECORD;
-      }
+      if (hasA && (this.unordered & BASE) === 0 && !this.orderA.next(a.key, a.keyStart, a.keyLen, a.prevKey, a.prevStart, a.prevLen))
+        this.unordered |= BASE;
+      if (hasB && (this.unordered & CAND) === 0 && !this.orderB.next(b.key, b.keyStart, b.keyLen, b.prevKey, b.prevStart, b.prevLen))
+        this.unordered |= CAND;
       const step = this.step;
       if (!this.proportion && !this.strict) {
         if (hasA && !(Math.abs(a.value) <= HUGE) || hasB && !(Math.abs(b.value) <= HUGE))
           this.strict = true;
       }
       if (hasA && hasB && sameBytes(a.key, a.keyStart, a.keyLen, b.key, b.keyStart, b.keyLen)) {
-        if (this.recorded !== 0) {
-          hashId(a.key, a.keyStart, a.keyLen);
-          this.operate(TOGETHER, a.key, a.keyStart, a.keyLen, hashed.a, step, 0);
-        }
         this.rows++;
         const x2 = a.value;
         const y = b.value;
@@ -46618,7 +46555,7 @@ var Pairing = class {
   }
   /** Queues a table operation (applies it at once for a long id, which the table keeps apart). */
   operate(kind, key, start, len, hash, step, value) {
-    if (kind === MEET_BASE || kind === MEET_CAND) this.ringUsed = !this.proportion;
+    this.ringUsed = !this.proportion;
     if (len <= INLINE_ID_BYTES) this.batch.add(kind, key, start, len, hash, step, value);
     else {
       this.table.incoming = value;
@@ -46645,7 +46582,9 @@ var Pairing = class {
   applyBatch() {
     const { batch, table: table2 } = this;
     if (batch.size === 0) return;
-    table2.prepare(batch.size, batch.longest);
+    table2.widen(batch.longest);
+    const rows = Math.max(this.estimate(this.a, 0), this.estimate(this.b, 1));
+    if (rows > 0) table2.expected = rows / 2;
     const order = batch.sorted(table2, this.tuning.regionBits);
     const keys = batch.keys;
     for (let i2 = 0; i2 < batch.size; i2++) {
@@ -46657,13 +46596,15 @@ var Pairing = class {
     }
     batch.clear();
   }
+  /** About how many rows a file has, from its size and the bytes per row so far; 0 if unknown. */
+  estimate(lines, i2) {
+    const size = this.sizes[i2];
+    return size === null || size === void 0 || lines.rows === 0 ? 0 : size * lines.rows / lines.consumed;
+  }
   /** One table operation; a pair it makes goes to the counts or the ring. */
   apply(kind, key, start, len, hash, step) {
     const table2 = this.table;
-    if (kind === TOGETHER) table2.together(key, start, len, hash);
-    else if (kind === MARK_BASE || kind === MARK_CAND)
-      table2.mark(kind === MARK_BASE ? BASE : CAND, key, start, len, hash);
-    else {
+    {
       const base = kind === MEET_BASE;
       if (!table2.meet(base ? BASE : CAND, key, start, len, hash)) return;
       this.rows++;
@@ -46704,41 +46645,18 @@ async function pairPredictions(baseline, candidate, kind, tuning = TUNING) {
     a = new PredictionLines(base.reader(), baseline.file, kind);
     b = new PredictionLines(cand.reader(), candidate.file, kind);
     const table2 = new IdTable(kind === "continuous");
-    const pairing = new Pairing(a, b, table2, kind, tuning);
+    const pairing = new Pairing(a, b, table2, kind, tuning, [base.size, cand.size]);
     for (let r = pairing.run(); r !== DONE; r = pairing.run()) {
       if (r === NEED_A) await a.fill();
-      else if (r === NEED_B) await b.fill();
-      else {
-        pairing.settle();
-        const side = pairing.stopped;
-        if (pairing.recorded === 0) {
-          const estimate = (o, l) => o.size === null || l.consumed === 0 ? 0 : o.size * l.rows / l.consumed;
-          table2.recordAll(Math.max(estimate(base, a), estimate(cand, b)) * 1.05);
-        }
-        const lines = side === BASE ? a : b;
-        const again = new PredictionLines((side === BASE ? base : cand).reader(), lines.file, kind);
-        const mark = side === BASE ? MARK_BASE : MARK_CAND;
-        try {
-          for (let n = lines.rows - 1; n > 0 && await row(again); n--) {
-            hashId(again.key, again.keyStart, again.keyLen);
-            pairing.operate(mark, again.key, again.keyStart, again.keyLen, hashed.a, 0, 0);
-            if (pairing.batch.full) pairing.applyBatch();
-          }
-          pairing.applyBatch();
-        } finally {
-          await again.close();
-        }
-        pairing.recorded |= side;
-      }
+      else await b.fill();
     }
     pairing.settle();
     pairing.flush();
-    if (table2.repeated !== 0) {
+    const unordered = pairing.unordered;
+    if (table2.repeated !== 0 || unordered === (BASE | CAND) || unordered === BASE && table2.waitingBase > 0 || unordered === CAND && table2.waitingCand > 0) {
       const issues2 = [];
-      if ((pairing.recorded & BASE) !== 0)
-        issues2.push(...await repeatedIds(base, baseline.file, kind));
-      if ((pairing.recorded & CAND) !== 0)
-        issues2.push(...await repeatedIds(cand, candidate.file, kind));
+      if ((unordered & BASE) !== 0) issues2.push(...await repeatedIds(base, baseline.file, kind));
+      if ((unordered & CAND) !== 0) issues2.push(...await repeatedIds(cand, candidate.file, kind));
       if (issues2.length > 0) throw new InputError(issues2);
     }
     const unmatched = { baseline: table2.waitingBase, candidate: table2.waitingCand };

@@ -1,5 +1,5 @@
 /**
- * A batch of id-table operations (rows out of step, ids of pairs, ids re-read), stored flat and
+ * A batch of id-table operations (rows out of step with the other file), stored flat and
  * applied grouped by the table region their id falls in. A million random probes into a table of
  * tens of megabytes miss the cache and the TLB on almost every probe; a few thousand probes into
  * one region of it mostly hit. Without a repeated id the result of the operations does not depend
@@ -10,9 +10,6 @@
 /** Operation kinds. */
 export const MEET_BASE = 1;
 export const MEET_CAND = 2;
-export const TOGETHER = 3;
-export const MARK_BASE = 4;
-export const MARK_CAND = 5;
 
 /** Words per record before the id bytes: hash, step, len << 3 | kind. */
 const HEAD = 3;

@@ -127,27 +127,23 @@ export const CAND = 2;
 const BOTH = 3;
 /** Entry bit: the value (0/1) of a waiting proportion row. */
 const ONE = 4;
-/** Entry word: hash & 0xffff << 16 | len << 3 | ONE? | CAND? | BASE? (0: empty slot). */
+/** Entry word after the hash: len << 3 | ONE? | CAND? | BASE? (0: empty slot). */
 const LEN_SHIFT = 3;
-const LEN_MASK = 0xff;
 /** Ids up to this many bytes are stored inline; longer ones (rare) in a Map. */
 export const INLINE_ID_BYTES = 64;
 /** Entries per slot at most. */
 const LOAD = 0.75;
 
 /**
- * The ids of both files, keyed on their bytes: open addressing with linear probing, each slot one
- * word (16 bits of hash, length, bits) and the id bytes inline at a fixed width (widened up to
- * INLINE_ID_BYTES), 20 bytes for ids up to 16 bytes. Slots are as many as needed (not a power of
- * two; an id's home slot is its hash scaled to the table), as every page of a large table is
- * memory the process must be given. An entry's bits say which files have the id: one bit, a row
- * waiting for its partner (with its value); both, a pair.
- *
- * While both files' ids keep increasing, only waiting rows are kept and a pair deletes its entry
- * (backward-shift deletion, no tombstones). From the first id out of order (`recordAll`) every id
- * is kept, so that an id a file has already had is seen again: `repeated` gets that file's bit.
- * The rows are those of the original reader's two Maps: a row whose id waits from the other file
- * pairs with it; otherwise it waits, replacing a waiting row of its own file with the same id.
+ * The rows waiting for their partner, keyed on their id bytes: open addressing with linear probing,
+ * each slot two words (hash; length, file, 0/1 value) and the id bytes inline at a fixed width
+ * (widened up to INLINE_ID_BYTES): 24 bytes for ids up to 16 bytes. Slots are as many as needed,
+ * not a power of two (an id's home slot is its hash scaled to the table), as every page of a large
+ * table is memory the process must be given; a pair deletes its entry (backward-shift deletion, no
+ * tombstones); `expected` lets it grow to the size it will need in fewer steps. The rows are
+ * those of the original reader's two Maps: a row whose id
+ * waits from the other file pairs with it; otherwise it waits, replacing a waiting row of its own
+ * file with the same id (and `repeated` gets that file's bit).
  */
 export class IdTable {
   /** Rows waiting, per file. */
@@ -161,10 +157,11 @@ export class IdTable {
   /** The value and step of the arriving row, for `meet` (fields: a double argument is boxed). */
   incoming = 0;
   incomingStep = 0;
-  private recording = false;
+  /** About how many rows will wait at most (0: unknown); read when the table must grow. */
+  expected = 0;
   private cap: number;
   private width = 16;
-  private stride = 1 + 16 / 4;
+  private stride = 2 + 16 / 4;
   private count = 0;
   private words: Uint32Array;
   private bytes: Uint8Array;
@@ -196,17 +193,9 @@ export class IdTable {
     return Math.floor(((hash >>> 16) * cap + Math.floor(((hash & 0xffff) * cap) / 65536)) / 65536);
   }
 
-  /** Room for `extra` more ids of up to `longest` bytes, so that no rebuild comes in between. */
-  prepare(extra: number, longest: number): void {
-    const width = Math.min(longest, INLINE_ID_BYTES);
-    if (width > this.width || this.count + extra > this.cap * LOAD)
-      this.rebuild(Math.max(this.cap, Math.ceil((this.count + extra) / LOAD)), width);
-  }
-
-  /** Keep every id from now on; `expected`: about how many distinct ids will come. */
-  recordAll(expected: number): void {
-    this.recording = true;
-    this.prepare(expected - this.count, 0);
+  /** Room for ids of up to `longest` bytes (so that no rebuild comes in the middle of a batch). */
+  widen(longest: number): void {
+    if (longest > this.width && longest <= INLINE_ID_BYTES) this.rebuild(this.cap, longest);
   }
 
   /**
@@ -221,7 +210,7 @@ export class IdTable {
       this.insert(~slot, key, start, len, hash, side);
       return false;
     }
-    const at = slot * this.stride;
+    const at = slot * this.stride + 1;
     const word = this.words[at] as number;
     const bits = word & BOTH;
     if ((bits & side) !== 0) {
@@ -235,46 +224,8 @@ export class IdTable {
       this.partnerStep = (this.steps as Uint32Array)[slot] as number;
     }
     this.count1(bits, -1);
-    if (this.recording) this.words[at] = ((word & ~(ONE | BOTH)) | BOTH) >>> 0;
-    else this.remove(slot);
+    this.remove(slot);
     return true;
-  }
-
-  /** Rows of both files with this id, in step (only while recording). */
-  together(key: Uint8Array, start: number, len: number, hash: number): void {
-    if (len > INLINE_ID_BYTES) {
-      const id = latin1(key, start, len);
-      const entry = this.long.get(id);
-      if (entry === undefined) this.long.set(id, { bits: BOTH, value: 0, step: 0 });
-      else {
-        this.repeated |= entry.bits;
-        entry.bits = BOTH;
-      }
-      return;
-    }
-    const slot = this.find(key, start, len, hash);
-    if (slot < 0) this.insert(~slot, key, start, len, hash, BOTH);
-    else this.repeated |= (this.words[slot * this.stride] as number) & BOTH;
-  }
-
-  /**
-   * An id of `side` read before `recordAll` (re-read from the file's start): it paired then unless
-   * it still waits. Waiting from the other file, though, means that file has it twice.
-   */
-  mark(side: number, key: Uint8Array, start: number, len: number, hash: number): void {
-    if (len > INLINE_ID_BYTES) {
-      const id = latin1(key, start, len);
-      const entry = this.long.get(id);
-      if (entry === undefined) this.long.set(id, { bits: BOTH, value: 0, step: 0 });
-      else if ((entry.bits & side) === 0) this.repeated |= entry.bits;
-      return;
-    }
-    const slot = this.find(key, start, len, hash);
-    if (slot < 0) this.insert(~slot, key, start, len, hash, BOTH);
-    else {
-      const bits = (this.words[slot * this.stride] as number) & BOTH;
-      if ((bits & side) === 0) this.repeated |= bits;
-    }
   }
 
   private longMeet(side: number, key: Uint8Array, start: number, len: number): boolean {
@@ -296,8 +247,7 @@ export class IdTable {
     this.partner = entry.value;
     this.partnerStep = entry.step;
     this.count1(entry.bits, -1);
-    if (this.recording) entry.bits = BOTH;
-    else this.long.delete(id);
+    this.long.delete(id);
     return true;
   }
 
@@ -305,14 +255,13 @@ export class IdTable {
   private find(key: Uint8Array, start: number, len: number, hash: number): number {
     if (len > this.width || this.count + 1 > this.cap * LOAD) this.grow(len);
     const { words, bytes, stride, cap } = this;
-    const want = (((hash & 0xffff) << 16) | (len << LEN_SHIFT)) >>> 0;
     let i = this.home(hash);
     for (;;) {
       const at = i * stride;
-      const word = words[at] as number;
+      const word = words[at + 1] as number;
       if (word === 0) return ~i;
-      if ((word & 0xfffffff8) >>> 0 === want) {
-        let b = (at + 1) * 4;
+      if (word >>> LEN_SHIFT === len && words[at] === hash) {
+        let b = (at + 2) * 4;
         let k = start;
         const stop = start + len;
         while (k < stop && bytes[b] === key[k]) {
@@ -335,18 +284,17 @@ export class IdTable {
   ): void {
     const at = slot * this.stride;
     const bytes = this.bytes;
-    for (let k = 0, b = (at + 1) * 4; k < len; k++) bytes[b + k] = key[start + k] as number;
+    for (let k = 0, b = (at + 2) * 4; k < len; k++) bytes[b + k] = key[start + k] as number;
     this.count++;
-    const word = (((hash & 0xffff) << 16) | (len << LEN_SHIFT)) >>> 0;
-    if (bits === BOTH) this.words[at] = (word | BOTH) >>> 0;
-    else this.store(slot, word, bits);
+    this.words[at] = hash;
+    this.store(slot, len << LEN_SHIFT, bits);
   }
 
   /** Makes the entry at `slot` a waiting row of `side` with the incoming value and step. */
   private store(slot: number, word: number, side: number): void {
-    const base = ((word & ~(ONE | BOTH)) | side) >>> 0;
-    const at = slot * this.stride;
-    if (this.values === null) this.words[at] = this.incoming === 1 ? (base | ONE) >>> 0 : base;
+    const base = (word & ~(ONE | BOTH)) | side;
+    const at = slot * this.stride + 1;
+    if (this.values === null) this.words[at] = this.incoming === 1 ? base | ONE : base;
     else {
       this.words[at] = base;
       this.values[slot] = this.incoming;
@@ -360,13 +308,6 @@ export class IdTable {
     else if (bits === CAND) this.waitingCand += by;
   }
 
-  /** The home slot of the entry at `slot` (its hash again, from its bytes). */
-  private homeOf(slot: number): number {
-    const at = slot * this.stride;
-    hashId(this.bytes, (at + 1) * 4, ((this.words[at] as number) >>> LEN_SHIFT) & LEN_MASK);
-    return this.home(hashed.a);
-  }
-
   private remove(slot: number): void {
     const { words, values, steps, stride, cap } = this;
     this.count--;
@@ -374,8 +315,8 @@ export class IdTable {
     let j = slot;
     for (;;) {
       j = j + 1 === cap ? 0 : j + 1;
-      if (words[j * stride] === 0) break;
-      const home = this.homeOf(j);
+      if (words[j * stride + 1] === 0) break;
+      const home = this.home(words[j * stride] as number);
       // Leave j where it is when its home slot lies cyclically in (i, j].
       if (i <= j ? i < home && home <= j : i < home || home <= j) continue;
       words.copyWithin(i * stride, j * stride, j * stride + stride);
@@ -385,38 +326,39 @@ export class IdTable {
       }
       i = j;
     }
-    words[i * stride] = 0;
+    words[i * stride + 1] = 0;
   }
 
   private grow(len: number): void {
-    let width = this.width;
-    while (width < len) width *= 2;
-    const cap = this.count + 1 > this.cap * LOAD ? this.cap * 2 : this.cap;
-    this.rebuild(cap, width);
+    let cap = this.cap;
+    if (this.count + 1 > cap * LOAD)
+      cap = Math.max(2 * cap, Math.ceil(Math.min(this.expected, 4 * this.count) / LOAD));
+    this.rebuild(cap, len);
   }
 
   private rebuild(cap: number, width: number): void {
-    const { words, bytes, values, steps, stride, cap: oldCap } = this;
+    const { words, values, steps, stride, cap: oldCap } = this;
     let w = this.width;
     while (w < width) w *= 2;
     this.cap = cap;
     this.width = w;
-    this.stride = 1 + w / 4;
+    this.stride = 2 + w / 4;
     this.words = new Uint32Array(cap * this.stride);
     this.bytes = new Uint8Array(this.words.buffer);
     this.values = values === null ? null : new Float64Array(cap);
     this.steps = steps === null ? null : new Uint32Array(cap);
-    const keyWords = stride - 1;
+    const keyWords = stride - 2;
     for (let s = 0; s < oldCap; s++) {
-      const word = words[s * stride] as number;
+      const word = words[s * stride + 1] as number;
       if (word === 0) continue;
-      hashId(bytes, (s * stride + 1) * 4, (word >>> LEN_SHIFT) & LEN_MASK);
-      let i = this.home(hashed.a);
-      while (this.words[i * this.stride] !== 0) i = i + 1 === cap ? 0 : i + 1;
+      const hash = words[s * stride] as number;
+      let i = this.home(hash);
+      while (this.words[i * this.stride + 1] !== 0) i = i + 1 === cap ? 0 : i + 1;
       const at = i * this.stride;
-      this.words[at] = word;
+      this.words[at] = hash;
+      this.words[at + 1] = word;
       for (let k = 0; k < keyWords; k++)
-        this.words[at + 1 + k] = words[s * stride + 1 + k] as number;
+        this.words[at + 2 + k] = words[s * stride + 2 + k] as number;
       if (this.values !== null && values !== null && this.steps !== null && steps !== null) {
         this.values[i] = values[s] as number;
         this.steps[i] = steps[s] as number;

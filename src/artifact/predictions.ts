@@ -4,10 +4,12 @@
  * rows with the same id at the same step pair at once, comparing id bytes; rows out of step wait in
  * an open-addressing table keyed on the id bytes until their partner shows up (id-tables.ts).
  *
- * A repeated id is an error. A file whose ids keep increasing cannot repeat one, so while both do,
- * nothing else is kept. From a file's first id out of order the table keeps every id (that file's
- * earlier ids are read again and added), and an id seen twice in one file marks it; a last read of
- * each such file finds and names the lines.
+ * A repeated id is an error, and nothing is kept to find one while it cannot be there:
+ * - a file whose ids keep increasing (by bytes, or by length then bytes) has none;
+ * - when only one file's ids do not, a repeat in it either meets its own waiting row in the table
+ *   or is left waiting at the end (its partner, once in the other file, is taken);
+ * - when neither's do, or in the two cases above, the files whose ids do not increase are read
+ *   again: 64-bit hashes of every id, then the lines of the ids whose hash repeats.
  */
 import { open, type FileHandle } from 'node:fs/promises';
 import type { MetricKind } from './types.js';
@@ -25,7 +27,7 @@ import {
   hashed,
   sameBytes,
 } from './id-tables.js';
-import { IdBatch, MARK_BASE, MARK_CAND, MEET_BASE, MEET_CAND, TOGETHER } from './id-batch.js';
+import { IdBatch, MEET_BASE, MEET_CAND } from './id-batch.js';
 import {
   NEED,
   ROW,
@@ -119,8 +121,6 @@ async function repeatedIds(o: Opened, file: string, kind: MetricKind): Promise<I
 const DONE = 0;
 const NEED_A = 1;
 const NEED_B = 2;
-/** A file's ids stopped increasing (`stopped`): its earlier ids must go into the table. */
-const RECORD = 3;
 /** Steps of one pairing step. */
 const ADVANCE_A = 0;
 const ADVANCE_B = 1;
@@ -152,10 +152,8 @@ class Pairing {
   baselineOnly = 0;
   candidateOnly = 0;
   readonly diffs = new RunningStats();
-  /** Files (BASE | CAND) whose ids stopped increasing and are all in the table. */
-  recorded = 0;
-  /** The file that `run()` returned RECORD for. */
-  stopped = 0;
+  /** Files (BASE | CAND) whose ids stopped increasing. */
+  unordered = 0;
   readonly batch: IdBatch;
   private hasA = true;
   private hasB = true;
@@ -178,6 +176,8 @@ class Pairing {
     readonly table: IdTable,
     kind: MetricKind,
     private readonly tuning: PairingTuning,
+    /** File sizes in bytes, when known. */
+    private readonly sizes: readonly [number | null, number | null],
   ) {
     this.proportion = kind === 'proportion';
     this.batch = new IdBatch(2 * tuning.window);
@@ -206,33 +206,24 @@ class Pairing {
       const hasA = this.hasA;
       const hasB = this.hasB;
       if (!hasA && !hasB) return DONE;
-      // Nothing changes before a RECORD return: the step is taken again after it.
       if (
         hasA &&
-        (this.recorded & BASE) === 0 &&
+        (this.unordered & BASE) === 0 &&
         !this.orderA.next(a.key, a.keyStart, a.keyLen, a.prevKey, a.prevStart, a.prevLen)
-      ) {
-        this.stopped = BASE;
-        return RECORD;
-      }
+      )
+        this.unordered |= BASE;
       if (
         hasB &&
-        (this.recorded & CAND) === 0 &&
+        (this.unordered & CAND) === 0 &&
         !this.orderB.next(b.key, b.keyStart, b.keyLen, b.prevKey, b.prevStart, b.prevLen)
-      ) {
-        this.stopped = CAND;
-        return RECORD;
-      }
+      )
+        this.unordered |= CAND;
       const step = this.step;
       if (!this.proportion && !this.strict) {
         if ((hasA && !(Math.abs(a.value) <= HUGE)) || (hasB && !(Math.abs(b.value) <= HUGE)))
           this.strict = true;
       }
       if (hasA && hasB && sameBytes(a.key, a.keyStart, a.keyLen, b.key, b.keyStart, b.keyLen)) {
-        if (this.recorded !== 0) {
-          hashId(a.key, a.keyStart, a.keyLen);
-          this.operate(TOGETHER, a.key, a.keyStart, a.keyLen, hashed.a, step, 0);
-        }
         this.rows++;
         const x = a.value;
         const y = b.value;
@@ -268,7 +259,7 @@ class Pairing {
     step: number,
     value: number,
   ): void {
-    if (kind === MEET_BASE || kind === MEET_CAND) this.ringUsed = !this.proportion;
+    this.ringUsed = !this.proportion;
     if (len <= INLINE_ID_BYTES) this.batch.add(kind, key, start, len, hash, step, value);
     else {
       this.table.incoming = value;
@@ -297,7 +288,10 @@ class Pairing {
   applyBatch(): void {
     const { batch, table } = this;
     if (batch.size === 0) return;
-    table.prepare(batch.size, batch.longest);
+    table.widen(batch.longest);
+    // Rows of a shuffled file wait up to half the file at once: let the table grow to that.
+    const rows = Math.max(this.estimate(this.a, 0), this.estimate(this.b, 1));
+    if (rows > 0) table.expected = rows / 2;
     const order = batch.sorted(table, this.tuning.regionBits);
     const keys = batch.keys;
     for (let i = 0; i < batch.size; i++) {
@@ -310,6 +304,14 @@ class Pairing {
     batch.clear();
   }
 
+  /** About how many rows a file has, from its size and the bytes per row so far; 0 if unknown. */
+  private estimate(lines: PredictionLines, i: 0 | 1): number {
+    const size = this.sizes[i];
+    return size === null || size === undefined || lines.rows === 0
+      ? 0
+      : (size * lines.rows) / lines.consumed;
+  }
+
   /** One table operation; a pair it makes goes to the counts or the ring. */
   private apply(
     kind: number,
@@ -320,10 +322,7 @@ class Pairing {
     step: number,
   ): void {
     const table = this.table;
-    if (kind === TOGETHER) table.together(key, start, len, hash);
-    else if (kind === MARK_BASE || kind === MARK_CAND)
-      table.mark(kind === MARK_BASE ? BASE : CAND, key, start, len, hash);
-    else {
+    {
       const base = kind === MEET_BASE;
       if (!table.meet(base ? BASE : CAND, key, start, len, hash)) return;
       this.rows++;
@@ -375,44 +374,24 @@ export async function pairPredictions(
     a = new PredictionLines(base.reader(), baseline.file, kind);
     b = new PredictionLines(cand.reader(), candidate.file, kind);
     const table = new IdTable(kind === 'continuous');
-    const pairing = new Pairing(a, b, table, kind, tuning);
+    const pairing = new Pairing(a, b, table, kind, tuning, [base.size, cand.size]);
     for (let r = pairing.run(); r !== DONE; r = pairing.run()) {
       if (r === NEED_A) await a.fill();
-      else if (r === NEED_B) await b.fill();
-      else {
-        // A file's ids stopped increasing: keep every id from now on, its earlier ones included.
-        pairing.settle();
-        const side = pairing.stopped;
-        if (pairing.recorded === 0) {
-          const estimate = (o: Opened, l: PredictionLines): number =>
-            o.size === null || l.consumed === 0 ? 0 : (o.size * l.rows) / l.consumed;
-          table.recordAll(Math.max(estimate(base, a), estimate(cand, b)) * 1.05);
-        }
-        const lines = side === BASE ? a : b;
-        const again = new PredictionLines((side === BASE ? base : cand).reader(), lines.file, kind);
-        const mark = side === BASE ? MARK_BASE : MARK_CAND;
-        try {
-          for (let n = lines.rows - 1; n > 0 && (await row(again)); n--) {
-            hashId(again.key, again.keyStart, again.keyLen);
-            pairing.operate(mark, again.key, again.keyStart, again.keyLen, hashed.a, 0, 0);
-            if (pairing.batch.full) pairing.applyBatch();
-          }
-          pairing.applyBatch();
-        } finally {
-          await again.close();
-        }
-        pairing.recorded |= side;
-      }
+      else await b.fill();
     }
     pairing.settle();
     pairing.flush();
 
-    if (table.repeated !== 0) {
+    const unordered = pairing.unordered;
+    if (
+      table.repeated !== 0 ||
+      unordered === (BASE | CAND) ||
+      (unordered === BASE && table.waitingBase > 0) ||
+      (unordered === CAND && table.waitingCand > 0)
+    ) {
       const issues: Issue[] = [];
-      if ((pairing.recorded & BASE) !== 0)
-        issues.push(...(await repeatedIds(base, baseline.file, kind)));
-      if ((pairing.recorded & CAND) !== 0)
-        issues.push(...(await repeatedIds(cand, candidate.file, kind)));
+      if ((unordered & BASE) !== 0) issues.push(...(await repeatedIds(base, baseline.file, kind)));
+      if ((unordered & CAND) !== 0) issues.push(...(await repeatedIds(cand, candidate.file, kind)));
       if (issues.length > 0) throw new InputError(issues);
     }
 

@@ -273,6 +273,16 @@ describe('byte-level predictions reader = string reader', () => {
     );
   }, 120_000);
 
+  it('sees an id repeated while it waits, though its partner comes later', async () => {
+    // The candidate's two "c" rows both wait before the baseline's "c" pairs with one: nothing is
+    // left over at the end, only the repeat itself tells.
+    const b = write(utf8('id,correct\na,1\nb,1\nc,1\n'));
+    const c = write(utf8('id,correct\nc,1\nc,0\na,1\nb,1\n'));
+    const expected = await outcome(() => referencePairPredictions(b, c, 'proportion'));
+    expect(expected).toMatch(/line 3 must have a unique id \(also on line 2\)/);
+    expect(await outcome(() => pairPredictions(b, c, 'proportion'))).toBe(expected);
+  });
+
   it('still sees a repeated id when the read before it overwrote the previous id', async () => {
     // The second read lands a newline where the first row's id was: only a saved copy of that id
     // shows that "b" repeats (the ids look increasing otherwise).
