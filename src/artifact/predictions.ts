@@ -185,7 +185,7 @@ class Pairing {
   }
 
   run(): number {
-    const { a, b, table, batch } = this;
+    const { a, b, batch } = this;
     for (;;) {
       if (this.phase === ADVANCE_A) {
         if (this.hasA) {
