@@ -41180,9 +41180,7 @@ function trainingProgress(train, k = STRIP) {
     return 1e3 * (sum / (k * min) - 1);
   });
 }
-function progressQuotient(validation, train, k = STRIP) {
-  const gl = generalizationLoss(validation);
-  const progress = trainingProgress(train, k);
+function quotients(gl, progress, k) {
   return gl.map((g, t) => {
     const p = progress[t];
     if ((t + 1) % k !== 0 || p === null || p === void 0) return null;
@@ -41211,7 +41209,8 @@ function epochVerdict(validation, train) {
   let pq = null;
   let stoppedEarly = false;
   if (train) {
-    const pqs = progressQuotient(validation, train);
+    const progresses = trainingProgress(train);
+    const pqs = quotients(gls, progresses, STRIP);
     for (const alpha of PQ_ALPHAS) stopsAt[`PQ_${alpha}`] = firstAbove(pqs, alpha);
     for (let t = last; t >= 0; t--) {
       const q = pqs[t];
@@ -41220,7 +41219,7 @@ function epochVerdict(validation, train) {
         break;
       }
     }
-    const progress = trainingProgress(train)[last];
+    const progress = progresses[last];
     stoppedEarly = validation.length >= STRIP && gl <= EARLY_GL && slope(validation.slice(-STRIP)) < 0 && slope(train.slice(-STRIP)) < 0 && progress !== null && progress !== void 0 && progress >= PROGRESS_STALLED;
   }
   for (const s of UP_STRIPS) stopsAt[`UP_${s}`] = upStop(validation, s);
@@ -45377,15 +45376,30 @@ function ajvIssues(errors, file, doc) {
   return issues2;
 }
 function nonFiniteNumbers(doc, pointer = "") {
-  if (typeof doc === "number") return Number.isFinite(doc) ? [] : [pointer];
-  if (Array.isArray(doc))
-    return doc.flatMap((item, i2) => nonFiniteNumbers(item, `${pointer}/${i2}`));
-  if (doc !== null && typeof doc === "object") {
-    return Object.entries(doc).flatMap(
-      ([k, v]) => nonFiniteNumbers(v, `${pointer}/${escapePointerToken(k)}`)
-    );
-  }
-  return [];
+  const found = [];
+  const path = [];
+  const walk = (node) => {
+    if (typeof node === "number") {
+      if (!Number.isFinite(node))
+        found.push(
+          pointer + path.map((t) => `/${typeof t === "number" ? t : escapePointerToken(t)}`).join("")
+        );
+    } else if (Array.isArray(node)) {
+      for (let i2 = 0; i2 < node.length; i2++) {
+        path.push(i2);
+        walk(node[i2]);
+        path.pop();
+      }
+    } else if (node !== null && typeof node === "object") {
+      for (const key of Object.keys(node)) {
+        path.push(key);
+        walk(node[key]);
+        path.pop();
+      }
+    }
+  };
+  walk(doc);
+  return found;
 }
 
 // src/artifact/validate.ts
@@ -46498,7 +46512,7 @@ var Pairing = class {
   pendingCount = 0;
   proportion;
   run() {
-    const { a, b, table: table2, batch } = this;
+    const { a, b, batch } = this;
     for (; ; ) {
       if (this.phase === ADVANCE_A) {
         if (this.hasA) {

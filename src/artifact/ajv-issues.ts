@@ -107,15 +107,35 @@ export function ajvIssues(errors: readonly ErrorObject[], file: string, doc: unk
   return issues;
 }
 
-/** Pointers of every number in a document that is not finite (JSON `1e999` parses to Infinity). */
+/**
+ * Pointers of every number in a document that is not finite (JSON `1e999` parses to Infinity).
+ * The path is kept as a stack and written out only for a bad number: a curve of a million points
+ * must not cost a string per number.
+ */
 export function nonFiniteNumbers(doc: unknown, pointer = ''): string[] {
-  if (typeof doc === 'number') return Number.isFinite(doc) ? [] : [pointer];
-  if (Array.isArray(doc))
-    return doc.flatMap((item, i) => nonFiniteNumbers(item, `${pointer}/${i}`));
-  if (doc !== null && typeof doc === 'object') {
-    return Object.entries(doc).flatMap(([k, v]) =>
-      nonFiniteNumbers(v, `${pointer}/${escapePointerToken(k)}`),
-    );
-  }
-  return [];
+  const found: string[] = [];
+  const path: (string | number)[] = [];
+  const walk = (node: unknown): void => {
+    if (typeof node === 'number') {
+      if (!Number.isFinite(node))
+        found.push(
+          pointer +
+            path.map((t) => `/${typeof t === 'number' ? t : escapePointerToken(t)}`).join(''),
+        );
+    } else if (Array.isArray(node)) {
+      for (let i = 0; i < node.length; i++) {
+        path.push(i);
+        walk(node[i]);
+        path.pop();
+      }
+    } else if (node !== null && typeof node === 'object') {
+      for (const key of Object.keys(node)) {
+        path.push(key);
+        walk((node as Record<string, unknown>)[key]);
+        path.pop();
+      }
+    }
+  };
+  walk(doc);
+  return found;
 }

@@ -69,8 +69,15 @@ export function progressQuotient(
   train: readonly number[],
   k = STRIP,
 ): (number | null)[] {
-  const gl = generalizationLoss(validation);
-  const progress = trainingProgress(train, k);
+  return quotients(generalizationLoss(validation), trainingProgress(train, k), k);
+}
+
+/** PQ from GL and P_k already computed (epochVerdict needs all three). */
+function quotients(
+  gl: readonly number[],
+  progress: readonly (number | null)[],
+  k: number,
+): (number | null)[] {
   return gl.map((g, t) => {
     const p = progress[t];
     if ((t + 1) % k !== 0 || p === null || p === undefined) return null;
@@ -133,7 +140,8 @@ export function epochVerdict(
   let pq: number | null = null;
   let stoppedEarly = false;
   if (train) {
-    const pqs = progressQuotient(validation, train);
+    const progresses = trainingProgress(train);
+    const pqs = quotients(gls, progresses, STRIP);
     for (const alpha of PQ_ALPHAS) stopsAt[`PQ_${alpha}`] = firstAbove(pqs, alpha);
     for (let t = last; t >= 0; t--) {
       const q = pqs[t];
@@ -142,7 +150,7 @@ export function epochVerdict(
         break;
       }
     }
-    const progress = trainingProgress(train)[last];
+    const progress = progresses[last];
     stoppedEarly =
       validation.length >= STRIP &&
       gl <= EARLY_GL &&
