@@ -45617,8 +45617,8 @@ function hashId(key, start, len) {
     a = Math.imul(a ^ c, 16777619);
     b = Math.imul(b ^ c, 1540483477);
   }
-  hashed.a = mix(a);
-  hashed.b = mix(b ^ b >>> 15);
+  hashed.a = mix(a) & 2147483647;
+  hashed.b = mix(b ^ b >>> 15) & 2147483647;
 }
 function sameBytes(x2, xs, xl, y, ys, yl) {
   if (xl !== yl) return false;
@@ -45716,11 +45716,11 @@ var IdTable = class {
   /** The value and step of the arriving row, for `meet` (fields: a double argument is boxed). */
   incoming = 0;
   incomingStep = 0;
-  /** About how many rows will wait at most (0: unknown); read when the table must grow. */
+  /** How many rows will wait at most, when that is clear (else 0); read when the table grows. */
   expected = 0;
   cap;
-  width = 16;
-  stride = 2 + 16 / 4;
+  width = 8;
+  stride = 2 + 8 / 4;
   count = 0;
   words;
   bytes;
@@ -45728,14 +45728,23 @@ var IdTable = class {
   /** Steps of waiting loss rows (their order decides the order of the differences). */
   steps;
   long = /* @__PURE__ */ new Map();
+  /** Rows waiting. */
+  get size() {
+    return this.count;
+  }
   /** Number of slots; an id's home slot is `home(hash)`. */
   get slots() {
     return this.cap;
   }
-  /** The home slot of a hash: ⌊hash · slots / 2^32⌋ (exact in doubles below 2^27 slots). */
+  /** The home slot of a 31-bit hash: ⌊hash · slots / 2^31⌋ (exact in doubles below 2^27 slots). */
   home(hash) {
     const cap = this.cap;
-    return Math.floor(((hash >>> 16) * cap + Math.floor((hash & 65535) * cap / 65536)) / 65536);
+    return Math.floor(((hash >>> 16) * cap + Math.floor((hash & 65535) * cap / 65536)) / 32768);
+  }
+  /** Room for `n` rows without growing. */
+  reserve(n) {
+    if (n > this.cap * LOAD)
+      this.rebuild(Math.max(Math.ceil(n / LOAD), Math.ceil(this.expected / LOAD)), 0);
   }
   /** Room for ids of up to `longest` bytes (so that no rebuild comes in the middle of a batch). */
   widen(longest) {
@@ -45859,14 +45868,12 @@ var IdTable = class {
   }
   grow(len) {
     let cap = this.cap;
-    if (this.count + 1 > cap * LOAD)
-      cap = Math.max(2 * cap, Math.ceil(Math.min(this.expected, 4 * this.count) / LOAD));
+    if (this.count + 1 > cap * LOAD) cap = Math.max(2 * cap, Math.ceil(this.expected / LOAD));
     this.rebuild(cap, len);
   }
   rebuild(cap, width) {
     const { words, values, steps, stride, cap: oldCap } = this;
-    let w = this.width;
-    while (w < width) w *= 2;
+    const w = Math.max(this.width, Math.ceil(width / 4) * 4);
     this.cap = cap;
     this.width = w;
     this.stride = 2 + w / 4;
@@ -45917,17 +45924,18 @@ var IdBatch = class {
   size = 0;
   /** Longest id in the batch. */
   longest = 0;
-  width = 16;
-  stride = HEAD + 16 / 4;
+  width = 8;
+  stride = HEAD + 8 / 4;
   words;
   bytes;
+  /** Values of the records (written by the caller after `add`: a double argument is boxed). */
   values;
   order;
   group = new Int32Array(0);
   get full() {
     return this.size === this.capacity;
   }
-  add(kind, key, start, len, hash, step, value) {
+  add(kind, key, start, len, hash, step) {
     if (len > this.width) this.widen(len);
     const r = this.size++;
     const at = r * this.stride;
@@ -45937,7 +45945,6 @@ var IdBatch = class {
     words[at + 2] = len << 3 | kind;
     const bytes = this.bytes;
     for (let k = 0, b = (at + HEAD) * 4; k < len; k++) bytes[b + k] = key[start + k];
-    this.values[r] = value;
     if (len > this.longest) this.longest = len;
   }
   /** Record indices in order of their home slot in `table` >>> shift (a counting sort). */
@@ -45966,7 +45973,11 @@ var IdBatch = class {
     return this.words[r * this.stride + 1];
   }
   kind(r) {
-    return this.words[r * this.stride + 2] & 7;
+    return this.words[r * this.stride + 2] & 3;
+  }
+  /** The 0/1 value given in bit 2 of the kind. */
+  bit(r) {
+    return this.words[r * this.stride + 2] >>> 2 & 1;
   }
   len(r) {
     return this.words[r * this.stride + 2] >>> 3;
@@ -45986,8 +45997,7 @@ var IdBatch = class {
     this.longest = 0;
   }
   widen(len) {
-    let width = this.width;
-    while (width < len) width *= 2;
+    const width = Math.ceil(len / 4) * 4;
     const stride = HEAD + width / 4;
     const words = new Uint32Array(this.capacity * stride);
     for (let r = 0; r < this.size; r++)
@@ -46552,13 +46562,28 @@ var Pairing = class {
         } else if (this.ringUsed) this.ring[(step - this.windowStart) * 3] = y - x2;
         else this.push(y - x2);
       } else {
+        this.ringUsed = !this.proportion;
         if (hasA) {
           hashId(a.key, a.keyStart, a.keyLen);
-          this.operate(MEET_BASE, a.key, a.keyStart, a.keyLen, hashed.a, step, a.value);
+          if (a.keyLen <= INLINE_ID_BYTES) {
+            if (this.proportion)
+              batch.add(MEET_BASE | a.value << 2, a.key, a.keyStart, a.keyLen, hashed.a, step);
+            else {
+              batch.add(MEET_BASE, a.key, a.keyStart, a.keyLen, hashed.a, step);
+              batch.values[batch.size - 1] = a.value;
+            }
+          } else this.now(MEET_BASE, a, step);
         }
         if (hasB) {
           hashId(b.key, b.keyStart, b.keyLen);
-          this.operate(MEET_CAND, b.key, b.keyStart, b.keyLen, hashed.a, step, b.value);
+          if (b.keyLen <= INLINE_ID_BYTES) {
+            if (this.proportion)
+              batch.add(MEET_CAND | b.value << 2, b.key, b.keyStart, b.keyLen, hashed.a, step);
+            else {
+              batch.add(MEET_CAND, b.key, b.keyStart, b.keyLen, hashed.a, step);
+              batch.values[batch.size - 1] = b.value;
+            }
+          } else this.now(MEET_CAND, b, step);
         }
       }
       this.step++;
@@ -46567,15 +46592,11 @@ var Pairing = class {
       this.phase = ADVANCE_A;
     }
   }
-  /** Queues a table operation (applies it at once for a long id, which the table keeps apart). */
-  operate(kind, key, start, len, hash, step, value) {
-    this.ringUsed = !this.proportion;
-    if (len <= INLINE_ID_BYTES) this.batch.add(kind, key, start, len, hash, step, value);
-    else {
-      this.table.incoming = value;
-      this.table.incomingStep = step;
-      this.apply(kind, key, start, len, hash, step);
-    }
+  /** A long id's table operation, at once (the table keeps long ids apart, in a Map). */
+  now(kind, lines, step) {
+    this.table.incoming = lines.value;
+    this.table.incomingStep = step;
+    this.apply(kind, lines.key, lines.keyStart, lines.keyLen, hashed.a, step);
   }
   /** Applies the batch and hands on the pairs of the window's steps, in order. */
   settle() {
@@ -46598,12 +46619,13 @@ var Pairing = class {
     if (batch.size === 0) return;
     table2.widen(batch.longest);
     const rows = Math.max(this.estimate(this.a, 0), this.estimate(this.b, 1));
-    if (rows > 0) table2.expected = rows / 2;
+    table2.expected = table2.size > this.step / 2 ? rows / 2 : 0;
+    if (table2.slots < 2 * batch.size) table2.reserve(table2.size + batch.size);
     const order = batch.sorted(table2, this.tuning.regionBits);
     const keys = batch.keys;
     for (let i2 = 0; i2 < batch.size; i2++) {
       const r = order[i2];
-      table2.incoming = batch.value(r);
+      table2.incoming = this.proportion ? batch.bit(r) : batch.value(r);
       const step = batch.step(r);
       table2.incomingStep = step;
       this.apply(batch.kind(r), keys, batch.keyStart(r), batch.len(r), batch.hash(r), step);

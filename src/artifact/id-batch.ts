@@ -11,18 +11,19 @@
 export const MEET_BASE = 1;
 export const MEET_CAND = 2;
 
-/** Words per record before the id bytes: hash, step, len << 3 | kind. */
+/** Words per record before the id bytes: hash, step, len << 3 | kind (with a 0/1 value in bit 2). */
 const HEAD = 3;
 
 export class IdBatch {
   size = 0;
   /** Longest id in the batch. */
   longest = 0;
-  private width = 16;
-  private stride = HEAD + 16 / 4;
+  private width = 8;
+  private stride = HEAD + 8 / 4;
   private words: Uint32Array;
   private bytes: Uint8Array;
-  private values: Float64Array;
+  /** Values of the records (written by the caller after `add`: a double argument is boxed). */
+  readonly values: Float64Array;
   private order: Int32Array;
   private group = new Int32Array(0);
 
@@ -37,15 +38,7 @@ export class IdBatch {
     return this.size === this.capacity;
   }
 
-  add(
-    kind: number,
-    key: Uint8Array,
-    start: number,
-    len: number,
-    hash: number,
-    step: number,
-    value: number,
-  ): void {
+  add(kind: number, key: Uint8Array, start: number, len: number, hash: number, step: number): void {
     if (len > this.width) this.widen(len);
     const r = this.size++;
     const at = r * this.stride;
@@ -55,7 +48,6 @@ export class IdBatch {
     words[at + 2] = (len << 3) | kind;
     const bytes = this.bytes;
     for (let k = 0, b = (at + HEAD) * 4; k < len; k++) bytes[b + k] = key[start + k] as number;
-    this.values[r] = value;
     if (len > this.longest) this.longest = len;
   }
 
@@ -87,7 +79,11 @@ export class IdBatch {
     return this.words[r * this.stride + 1] as number;
   }
   kind(r: number): number {
-    return (this.words[r * this.stride + 2] as number) & 7;
+    return (this.words[r * this.stride + 2] as number) & 3;
+  }
+  /** The 0/1 value given in bit 2 of the kind. */
+  bit(r: number): number {
+    return ((this.words[r * this.stride + 2] as number) >>> 2) & 1;
   }
   len(r: number): number {
     return (this.words[r * this.stride + 2] as number) >>> 3;
@@ -109,8 +105,7 @@ export class IdBatch {
   }
 
   private widen(len: number): void {
-    let width = this.width;
-    while (width < len) width *= 2;
+    const width = Math.ceil(len / 4) * 4;
     const stride = HEAD + width / 4;
     const words = new Uint32Array(this.capacity * stride);
     for (let r = 0; r < this.size; r++)

@@ -4,7 +4,10 @@
  * and nothing needs remembering), an open-addressing table of ids, and a set of 64-bit hashes.
  */
 
-/** The two 32-bit words of the last `hashId` (a and b; a picks the slot). */
+/**
+ * The two 31-bit words of the last `hashId` (a and b; a picks the slot). 31 bits, not 32: a small
+ * integer travels through calls as is, a larger one is a heap number allocated per call.
+ */
 export const hashed = { a: 0, b: 0 };
 
 /** murmur3's 32-bit finaliser (Appleby, MurmurHash3, public domain; common practice). */
@@ -14,7 +17,7 @@ function mix(h: number): number {
   return (h ^ (h >>> 16)) >>> 0;
 }
 
-/** Two 32-bit FNV-1a-style hashes of `key[start, start + len)` (different primes), mixed. */
+/** Two FNV-1a-style hashes of `key[start, start + len)` (different primes), mixed, 31 bits each. */
 export function hashId(key: Uint8Array, start: number, len: number): void {
   let a = 0x811c9dc5;
   let b = 0x9747b28c ^ len;
@@ -23,8 +26,8 @@ export function hashId(key: Uint8Array, start: number, len: number): void {
     a = Math.imul(a ^ c, 0x01000193);
     b = Math.imul(b ^ c, 0x5bd1e995);
   }
-  hashed.a = mix(a);
-  hashed.b = mix(b ^ (b >>> 15));
+  hashed.a = mix(a) & 0x7fffffff;
+  hashed.b = mix(b ^ (b >>> 15)) & 0x7fffffff;
 }
 
 export function sameBytes(
@@ -137,10 +140,10 @@ const LOAD = 0.75;
 /**
  * The rows waiting for their partner, keyed on their id bytes: open addressing with linear probing,
  * each slot two words (hash; length, file, 0/1 value) and the id bytes inline at a fixed width
- * (widened up to INLINE_ID_BYTES): 24 bytes for ids up to 16 bytes. Slots are as many as needed,
+ * (widened in steps of 4 up to INLINE_ID_BYTES): 20 bytes for ids up to 12 bytes. Slots are as many as needed,
  * not a power of two (an id's home slot is its hash scaled to the table), as every page of a large
  * table is memory the process must be given; a pair deletes its entry (backward-shift deletion, no
- * tombstones); `expected` lets it grow to the size it will need in fewer steps. The rows are
+ * tombstones); `expected` lets it grow straight to the size it will need. The rows are
  * those of the original reader's two Maps: a row whose id
  * waits from the other file pairs with it; otherwise it waits, replacing a waiting row of its own
  * file with the same id (and `repeated` gets that file's bit).
@@ -157,11 +160,11 @@ export class IdTable {
   /** The value and step of the arriving row, for `meet` (fields: a double argument is boxed). */
   incoming = 0;
   incomingStep = 0;
-  /** About how many rows will wait at most (0: unknown); read when the table must grow. */
+  /** How many rows will wait at most, when that is clear (else 0); read when the table grows. */
   expected = 0;
   private cap: number;
-  private width = 16;
-  private stride = 2 + 16 / 4;
+  private width = 8;
+  private stride = 2 + 8 / 4;
   private count = 0;
   private words: Uint32Array;
   private bytes: Uint8Array;
@@ -182,15 +185,26 @@ export class IdTable {
     this.steps = losses ? new Uint32Array(slots) : null;
   }
 
+  /** Rows waiting. */
+  get size(): number {
+    return this.count;
+  }
+
   /** Number of slots; an id's home slot is `home(hash)`. */
   get slots(): number {
     return this.cap;
   }
 
-  /** The home slot of a hash: ⌊hash · slots / 2^32⌋ (exact in doubles below 2^27 slots). */
+  /** The home slot of a 31-bit hash: ⌊hash · slots / 2^31⌋ (exact in doubles below 2^27 slots). */
   home(hash: number): number {
     const cap = this.cap;
-    return Math.floor(((hash >>> 16) * cap + Math.floor(((hash & 0xffff) * cap) / 65536)) / 65536);
+    return Math.floor(((hash >>> 16) * cap + Math.floor(((hash & 0xffff) * cap) / 65536)) / 32768);
+  }
+
+  /** Room for `n` rows without growing. */
+  reserve(n: number): void {
+    if (n > this.cap * LOAD)
+      this.rebuild(Math.max(Math.ceil(n / LOAD), Math.ceil(this.expected / LOAD)), 0);
   }
 
   /** Room for ids of up to `longest` bytes (so that no rebuild comes in the middle of a batch). */
@@ -331,15 +345,14 @@ export class IdTable {
 
   private grow(len: number): void {
     let cap = this.cap;
-    if (this.count + 1 > cap * LOAD)
-      cap = Math.max(2 * cap, Math.ceil(Math.min(this.expected, 4 * this.count) / LOAD));
+    if (this.count + 1 > cap * LOAD) cap = Math.max(2 * cap, Math.ceil(this.expected / LOAD));
     this.rebuild(cap, len);
   }
 
   private rebuild(cap: number, width: number): void {
     const { words, values, steps, stride, cap: oldCap } = this;
-    let w = this.width;
-    while (w < width) w *= 2;
+    // Widths in steps of 4 bytes (ids of a file mostly have similar lengths).
+    const w = Math.max(this.width, Math.ceil(width / 4) * 4);
     this.cap = cap;
     this.width = w;
     this.stride = 2 + w / 4;

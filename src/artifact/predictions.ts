@@ -233,13 +233,28 @@ class Pairing {
         } else if (this.ringUsed) this.ring[(step - this.windowStart) * 3] = y - x;
         else this.push(y - x);
       } else {
+        this.ringUsed = !this.proportion;
         if (hasA) {
           hashId(a.key, a.keyStart, a.keyLen);
-          this.operate(MEET_BASE, a.key, a.keyStart, a.keyLen, hashed.a, step, a.value);
+          if (a.keyLen <= INLINE_ID_BYTES) {
+            if (this.proportion)
+              batch.add(MEET_BASE | (a.value << 2), a.key, a.keyStart, a.keyLen, hashed.a, step);
+            else {
+              batch.add(MEET_BASE, a.key, a.keyStart, a.keyLen, hashed.a, step);
+              batch.values[batch.size - 1] = a.value;
+            }
+          } else this.now(MEET_BASE, a, step);
         }
         if (hasB) {
           hashId(b.key, b.keyStart, b.keyLen);
-          this.operate(MEET_CAND, b.key, b.keyStart, b.keyLen, hashed.a, step, b.value);
+          if (b.keyLen <= INLINE_ID_BYTES) {
+            if (this.proportion)
+              batch.add(MEET_CAND | (b.value << 2), b.key, b.keyStart, b.keyLen, hashed.a, step);
+            else {
+              batch.add(MEET_CAND, b.key, b.keyStart, b.keyLen, hashed.a, step);
+              batch.values[batch.size - 1] = b.value;
+            }
+          } else this.now(MEET_CAND, b, step);
         }
       }
       this.step++;
@@ -249,23 +264,11 @@ class Pairing {
     }
   }
 
-  /** Queues a table operation (applies it at once for a long id, which the table keeps apart). */
-  operate(
-    kind: number,
-    key: Uint8Array,
-    start: number,
-    len: number,
-    hash: number,
-    step: number,
-    value: number,
-  ): void {
-    this.ringUsed = !this.proportion;
-    if (len <= INLINE_ID_BYTES) this.batch.add(kind, key, start, len, hash, step, value);
-    else {
-      this.table.incoming = value;
-      this.table.incomingStep = step;
-      this.apply(kind, key, start, len, hash, step);
-    }
+  /** A long id's table operation, at once (the table keeps long ids apart, in a Map). */
+  private now(kind: number, lines: PredictionLines, step: number): void {
+    this.table.incoming = lines.value;
+    this.table.incomingStep = step;
+    this.apply(kind, lines.key, lines.keyStart, lines.keyLen, hashed.a, step);
   }
 
   /** Applies the batch and hands on the pairs of the window's steps, in order. */
@@ -289,14 +292,17 @@ class Pairing {
     const { batch, table } = this;
     if (batch.size === 0) return;
     table.widen(batch.longest);
-    // Rows of a shuffled file wait up to half the file at once: let the table grow to that.
+    // When about a row per step waits, the ids are shuffled: then rows wait up to half the file at
+    // once (a random order), and the table may as well grow to that in one step.
     const rows = Math.max(this.estimate(this.a, 0), this.estimate(this.b, 1));
-    if (rows > 0) table.expected = rows / 2;
+    table.expected = table.size > this.step / 2 ? rows / 2 : 0;
+    // A small table grows once for the whole batch (not by doubling through it).
+    if (table.slots < 2 * batch.size) table.reserve(table.size + batch.size);
     const order = batch.sorted(table, this.tuning.regionBits);
     const keys = batch.keys;
     for (let i = 0; i < batch.size; i++) {
       const r = order[i] as number;
-      table.incoming = batch.value(r);
+      table.incoming = this.proportion ? batch.bit(r) : batch.value(r);
       const step = batch.step(r);
       table.incomingStep = step;
       this.apply(batch.kind(r), keys, batch.keyStart(r), batch.len(r), batch.hash(r), step);
