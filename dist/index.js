@@ -40634,19 +40634,19 @@ fitgap's review is ${body.length} characters long, more than a comment can hold 
 }
 
 // src/action/publish-steps.ts
-function setReviewOutputs(io, review, reportPath, reportDir) {
-  io.setOutput("movement", review.movement);
-  io.setOutput("validation-change", review.validation.change);
-  io.setOutput("candidate-diagnosis", review.candidate.diagnosis);
-  io.setOutput("gate", review.gate.pass ? "pass" : "fail");
-  io.setOutput("report-path", reportPath);
-  io.setOutput("report-dir", reportDir);
+function setReviewOutputs(io2, review, reportPath, reportDir) {
+  io2.setOutput("movement", review.movement);
+  io2.setOutput("validation-change", review.validation.change);
+  io2.setOutput("candidate-diagnosis", review.candidate.diagnosis);
+  io2.setOutput("gate", review.gate.pass ? "pass" : "fail");
+  io2.setOutput("report-path", reportPath);
+  io2.setOutput("report-dir", reportDir);
 }
 function runUrl(context3) {
   return `${context3.serverUrl}/${context3.repo.owner}/${context3.repo.repo}/actions/runs/${context3.runId}`;
 }
 async function commentStep(deps, target, body) {
-  const { settings, context: context3, octokit, io } = deps;
+  const { settings, context: context3, octokit, io: io2 } = deps;
   if (settings.comment === "off") return null;
   try {
     const outcome = await publishComment({
@@ -40661,19 +40661,19 @@ async function commentStep(deps, target, body) {
       ...target.currentHead === void 0 ? {} : { currentHead: target.currentHead }
     });
     if (outcome.action === "stale") {
-      io.info(
+      io2.info(
         `Not commenting: this review is for ${target.headSha}, but PR #${target.pullNumber} has moved on to ${outcome.currentHead}; the run for that commit reports it.`
       );
       return null;
     }
-    io.info(`Comment ${outcome.action}: ${outcome.url}`);
-    io.setOutput("comment-url", outcome.url);
+    io2.info(`Comment ${outcome.action}: ${outcome.url}`);
+    io2.setOutput("comment-url", outcome.url);
     return null;
   } catch (error2) {
     if (isRequestError(error2) && error2.status === 403) {
       const text2 = `fitgap could not comment on PR #${target.pullNumber} (${describeRequestError(error2)}). Fork PRs get a read-only token: use the two-workflow pattern (examples/fork-safe-*.yml), or grant "pull-requests: write". The review is in this job summary.`;
-      io.warning(text2);
-      await io.appendSummary(`
+      io2.warning(text2);
+      await io2.appendSummary(`
 > [!WARNING]
 > ${text2}
 `);
@@ -40685,7 +40685,7 @@ async function commentStep(deps, target, body) {
   }
 }
 async function gateCheckStep(deps, kind, sha, review, body) {
-  const { settings, context: context3, octokit, io } = deps;
+  const { settings, context: context3, octokit, io: io2 } = deps;
   const name = settings.commentKey === "default" ? "fitgap" : `fitgap (${settings.commentKey})`;
   try {
     const outcome = await publishGate({
@@ -40700,7 +40700,7 @@ async function gateCheckStep(deps, kind, sha, review, body) {
       reasons: review.gate.reasons,
       detailsUrl: runUrl(context3)
     });
-    io.info(
+    io2.info(
       `Gate published as a ${outcome.kind} on ${sha}: ${review.gate.pass ? "pass" : "fail"}.`
     );
     return null;
@@ -40761,7 +40761,7 @@ function refuse2(issue2) {
   throw new InputError([{ pointer: "", ...issue2 }]);
 }
 async function runPublish(deps) {
-  const { settings, context: context3, octokit, io } = deps;
+  const { settings, context: context3, octokit, io: io2 } = deps;
   const run = context3.workflowRun;
   if (run === null || context3.eventName !== "workflow_run") {
     refuse2({
@@ -40807,13 +40807,13 @@ async function runPublish(deps) {
       got: String(error2)
     });
   }
-  await io.appendSummary(body);
+  await io2.appendSummary(body);
   const written = await writeReportFiles(
     join2(settings.tempDir, `fitgap-${settings.commentKey}`, "report"),
     review,
     note
   );
-  setReviewOutputs(io, review, written.path, written.dir);
+  setReviewOutputs(io2, review, written.path, written.dir);
   const problems = [];
   const comment = await commentStep(
     deps,
@@ -40827,8 +40827,8 @@ async function runPublish(deps) {
     if (problem !== null) problems.push(problem);
   }
   if (!review.gate.pass)
-    io.info(`Gate failed (published on ${run.headSha}): ${review.gate.reasons.join("; ")}`);
-  if (problems.length > 0) io.setFailed(problems.join("\n"));
+    io2.info(`Gate failed (published on ${run.headSha}): ${review.gate.reasons.join("; ")}`);
+  if (problems.length > 0) io2.setFailed(problems.join("\n"));
 }
 async function downloadBundle(deps, run) {
   const { settings, context: context3, octokit } = deps;
@@ -46018,39 +46018,15 @@ var f64 = new Float64Array(1);
 var u32 = new Uint32Array(f64.buffer);
 var HI = new Uint8Array(new Uint16Array([1]).buffer)[0] === 1 ? 1 : 0;
 var LO = 1 - HI;
-var decoded = new Float64Array(1);
-function round(q0, r, scale) {
-  if (r === 0) {
-    decoded[0] = q0;
-    return true;
-  }
-  f64[0] = q0;
-  let lo = u32[LO] + (r > 0 ? 1 : -1);
-  let hi = u32[HI];
-  if (lo > 4294967295) {
-    lo = 0;
-    hi++;
-  } else if (lo < 0) {
-    lo = 4294967295;
-    hi--;
-  }
-  u32[LO] = lo;
-  u32[HI] = hi;
-  const c = f64[0];
-  const half = Math.abs(c - q0) * scale / 2;
-  const a = Math.abs(r);
-  const margin = half * 2 ** -20;
-  if (a < half - margin) decoded[0] = q0;
-  else if (a > half + margin && a < 2 * half * 1.2) decoded[0] = c;
-  else return false;
-  return true;
-}
-function decimalToDouble(hi, lo, loDigits, scale) {
+var io = new Float64Array(3);
+var decoded = io.subarray(2, 3);
+function decodeDecimal(loDigits, scale) {
   if (scale < -22 || scale > 22 || loDigits > 4) return false;
+  const hi = io[0];
   const k = scale < 0 ? -scale : scale;
   const d = POW10[k];
   if (loDigits === 0) {
-    decoded[0] = scale < 0 ? hi / d : hi * d;
+    io[2] = scale < 0 ? hi / d : hi * d;
     return true;
   }
   if (hi === 0) return false;
@@ -46061,24 +46037,54 @@ function decimalToDouble(hi, lo, loDigits, scale) {
   let xh = x2 - (x2 - hi);
   let xl = hi - xh;
   const p = hi * t;
-  const e = xh * th - p + xh * tl + xl * th + xl * tl + lo;
+  const e = xh * th - p + xh * tl + xl * th + xl * tl + io[1];
   const mh = p + e;
   const ml = e - (mh - p);
   const dh = POW10_HI[k];
   const dl = POW10_LO[k];
+  let q0;
+  let r;
+  let unit;
   if (scale >= 0) {
-    const q02 = mh * d;
+    q0 = mh * d;
     x2 = SPLIT * mh;
     xh = x2 - (x2 - mh);
     xl = mh - xh;
-    return round(q02, xh * dh - q02 + xh * dl + xl * dh + xl * dl + ml * d, 1);
+    r = xh * dh - q0 + xh * dl + xl * dh + xl * dl + ml * d;
+    unit = 1;
+  } else {
+    q0 = mh / d;
+    const pp = q0 * d;
+    x2 = SPLIT * q0;
+    xh = x2 - (x2 - q0);
+    xl = q0 - xh;
+    r = mh - pp - (xh * dh - pp + xh * dl + xl * dh + xl * dl) + ml;
+    unit = d;
   }
-  const q0 = mh / d;
-  const pp = q0 * d;
-  x2 = SPLIT * q0;
-  xh = x2 - (x2 - q0);
-  xl = q0 - xh;
-  return round(q0, mh - pp - (xh * dh - pp + xh * dl + xl * dh + xl * dl) + ml, d);
+  if (r === 0) {
+    io[2] = q0;
+    return true;
+  }
+  f64[0] = q0;
+  let lo = u32[LO] + (r > 0 ? 1 : -1);
+  let hiWord = u32[HI];
+  if (lo > 4294967295) {
+    lo = 0;
+    hiWord++;
+  } else if (lo < 0) {
+    lo = 4294967295;
+    hiWord--;
+  }
+  u32[LO] = lo;
+  u32[HI] = hiWord;
+  const c = f64[0];
+  const half = Math.abs(c - q0) * unit / 2;
+  const a = Math.abs(r);
+  const margin = half * 2 ** -20;
+  if (a < half - margin) io[2] = q0;
+  else if (a > half + margin && a < 2 * half * 1.2) io[2] = c;
+  else return false;
+  return true;
 }
 
 // src/artifact/prediction-lines.ts
@@ -46139,6 +46145,14 @@ function parseValue(raw, kind, file, line) {
     throw valueError(kind, file, line, raw);
   return value;
 }
+function allDigits(w) {
+  return (w & 4042322160) === 808464432 && (w + 101058054 & 4042322160) === 808464432;
+}
+function fourDigits(w) {
+  const d = w - 808464432;
+  const pairs = Math.imul(d, 10) + (d >>> 8) & 16711935;
+  return (pairs & 255) * 100 + (pairs >>> 16);
+}
 var PredictionLines = class {
   constructor(reader, file, kind) {
     this.reader = reader;
@@ -46165,6 +46179,8 @@ var PredictionLines = class {
   prevStart = 0;
   prevLen = -1;
   buf = Buffer.allocUnsafe(CHUNK);
+  /** `buf` read four bytes at a time (digits eight at a time in `number`). */
+  view = new DataView(this.buf.buffer, this.buf.byteOffset, this.buf.length);
   pos = 0;
   /** Bytes before `buf[0]`. */
   dropped = 0;
@@ -46185,6 +46201,7 @@ var PredictionLines = class {
       const bigger = Buffer.allocUnsafe(this.buf.length * 2);
       this.buf.copy(bigger, 0, this.pos, this.end);
       this.buf = bigger;
+      this.view = new DataView(bigger.buffer, bigger.byteOffset, bigger.length);
     } else if (this.pos > 0) this.buf.copyWithin(0, this.pos, this.end);
     this.pos = 0;
     this.end = rest;
@@ -46285,6 +46302,14 @@ var PredictionLines = class {
     let scale = 0;
     if (p < end && c === 46) {
       const fracStart = ++p;
+      const view = this.view;
+      while (hi < 1e7 && p + 8 <= end) {
+        const w0 = view.getUint32(p, true);
+        const w1 = view.getUint32(p + 4, true);
+        if (!allDigits(w0) || !allDigits(w1)) break;
+        hi = hi * 1e8 + fourDigits(w0) * 1e4 + fourDigits(w1);
+        p += 8;
+      }
       while (p < end && (c = buf[p]) >= 48 && c <= 57) {
         if (hi < 1e14) hi = hi * 10 + (c - 48);
         else {
@@ -46315,8 +46340,10 @@ var PredictionLines = class {
     }
     if (c !== 10) return -1;
     let value;
-    if (decimalToDouble(hi, lo, loDigits, scale)) {
-      value = decoded[0];
+    io[0] = hi;
+    io[1] = lo;
+    if (decodeDecimal(loDigits, scale)) {
+      value = io[2];
       if (negative) value = -value;
     } else {
       value = Number(buf.toString("latin1", from, p));
@@ -46560,7 +46587,12 @@ var Pairing = class {
           if (x2 === 1 && y === 0) this.baselineOnly++;
           else if (x2 === 0 && y === 1) this.candidateOnly++;
         } else if (this.ringUsed) this.ring[(step - this.windowStart) * 3] = y - x2;
-        else this.push(y - x2);
+        else {
+          const d = y - x2;
+          if (d - d !== 0) this.refuse(d);
+          this.pending[this.pendingCount++] = d;
+          if (this.pendingCount === BATCH) this.flush();
+        }
       } else {
         this.ringUsed = !this.proportion;
         if (hasA) {
@@ -46607,7 +46639,9 @@ var Pairing = class {
       for (let i2 = 0; i2 < stop; i2++) {
         const d = ring[i2];
         if (d === d) {
-          this.push(d);
+          if (d - d !== 0) this.refuse(d);
+          this.pending[this.pendingCount++] = d;
+          if (this.pendingCount === BATCH) this.flush();
           ring[i2] = Number.NaN;
         }
       }
@@ -46657,13 +46691,10 @@ var Pairing = class {
       this.ring[(at - this.windowStart) * 3 + k] = y - x2;
     }
   }
-  push(d) {
-    if (d - d !== 0) {
-      this.flush();
-      this.diffs.push(d);
-    }
-    this.pending[this.pendingCount++] = d;
-    if (this.pendingCount === BATCH) this.flush();
+  /** RunningStats refuses a non-finite value: let it throw now, as it would have. */
+  refuse(d) {
+    this.flush();
+    this.diffs.push(d);
   }
   flush() {
     const { pending, diffs } = this;
@@ -47385,7 +47416,7 @@ async function reviewFiles(options) {
 import { mkdir as mkdir3, writeFile as writeFile3 } from "node:fs/promises";
 import { basename, dirname as dirname3, join as join4, resolve as resolve3 } from "node:path";
 async function resolveBaseline(deps) {
-  const { settings, context: context3, octokit, io } = deps;
+  const { settings, context: context3, octokit, io: io2 } = deps;
   if (settings.baseline !== null) return resolve3(settings.workspace, settings.baseline);
   const name = settings.baselineArtifact ?? "";
   const filter = runFilter(settings, context3);
@@ -47398,7 +47429,7 @@ async function resolveBaseline(deps) {
     name,
     excludeRunId: context3.runId
   });
-  io.info(`Baseline: artifact "${name}" (${artifact.sizeInBytes} bytes) of run ${artifact.runId}.`);
+  io2.info(`Baseline: artifact "${name}" (${artifact.sizeInBytes} bytes) of run ${artifact.runId}.`);
   const zip = await downloadArtifact({
     octokit,
     repo: context3.repo,
@@ -47447,7 +47478,7 @@ async function currentWorkflow(deps) {
 
 // src/action/review-mode.ts
 async function runReview(deps) {
-  const { settings, context: context3, io } = deps;
+  const { settings, context: context3, io: io2 } = deps;
   const baseline = await resolveBaseline(deps);
   const overrides = {
     ...settings.alpha === null ? {} : { alpha: settings.alpha },
@@ -47477,7 +47508,7 @@ async function runReview(deps) {
     ]
   };
   const body = renderMarkdown(review, { commentKey: settings.commentKey, headSha, provenance });
-  await io.appendSummary(body);
+  await io2.appendSummary(body);
   const files = await writeReportFiles(
     join5(settings.tempDir, `fitgap-${settings.commentKey}`, "report"),
     review,
@@ -47488,7 +47519,7 @@ async function runReview(deps) {
       headSha: pr.headSha
     }
   );
-  setReviewOutputs(io, review, files.path, files.dir);
+  setReviewOutputs(io2, review, files.path, files.dir);
   const problems = [];
   if (pr !== null) {
     const problem = await commentStep(deps, { pullNumber: pr.number, headSha }, body);
@@ -47501,7 +47532,7 @@ async function runReview(deps) {
   if (!review.gate.pass)
     problems.unshift(`fitgap gate failed:
 ${review.gate.reasons.map((r) => `- ${r}`).join("\n")}`);
-  if (problems.length > 0) io.setFailed(problems.join("\n"));
+  if (problems.length > 0) io2.setFailed(problems.join("\n"));
 }
 
 // src/action/settings.ts

@@ -25,53 +25,34 @@ const HI = new Uint8Array(new Uint16Array([1]).buffer)[0] === 1 ? 1 : 0;
 const LO = 1 - HI;
 
 /**
- * The value of the last `decimalToDouble` call that returned true. (A double kept in a typed array
- * rather than returned: a returned double is a heap allocation per call when V8 does not inline.)
+ * In and out of `decodeDecimal`: io[0] = hi, io[1] = lo in; io[2] = the value out. (Doubles kept in
+ * a typed array rather than passed or returned: a double argument or result is a heap allocation
+ * per call when V8 does not inline the call.)
  */
-export const decoded = new Float64Array(1);
+export const io = new Float64Array(3);
 
-/**
- * Sets `decoded[0]` to q0 or its neighbour for an exact value q0 + r/scale; false for a near-tie.
- */
-function round(q0: number, r: number, scale: number): boolean {
-  if (r === 0) {
-    decoded[0] = q0;
-    return true;
-  }
-  // The neighbour c of q0 > 0 in the direction of r, by stepping its bits.
-  f64[0] = q0;
-  let lo = (u32[LO] as number) + (r > 0 ? 1 : -1);
-  let hi = u32[HI] as number;
-  if (lo > 0xffffffff) {
-    lo = 0;
-    hi++;
-  } else if (lo < 0) {
-    lo = 0xffffffff;
-    hi--;
-  }
-  u32[LO] = lo;
-  u32[HI] = hi;
-  const c = f64[0] as number;
-  const half = (Math.abs(c - q0) * scale) / 2;
-  const a = Math.abs(r);
-  const margin = half * 2 ** -20;
-  if (a < half - margin) decoded[0] = q0;
-  else if (a > half + margin && a < 2 * half * 1.2) decoded[0] = c;
-  else return false;
-  return true;
-}
+/** The value of the last `decimalToDouble` call that returned true. */
+export const decoded = io.subarray(2, 3);
 
 /**
  * Sets `decoded[0]` to `(hi · 10^loDigits + lo) · 10^scale`, for hi < 10^15, lo < 10^loDigits,
  * loDigits ≤ 4 and |scale| ≤ 22, and returns true; false when a `Number()` call must decide.
  */
 export function decimalToDouble(hi: number, lo: number, loDigits: number, scale: number): boolean {
+  io[0] = hi;
+  io[1] = lo;
+  return decodeDecimal(loDigits, scale);
+}
+
+/** `decimalToDouble` with hi and lo in io[0] and io[1]; the value in io[2]. */
+export function decodeDecimal(loDigits: number, scale: number): boolean {
   if (scale < -22 || scale > 22 || loDigits > 4) return false;
+  const hi = io[0] as number;
   const k = scale < 0 ? -scale : scale;
   const d = POW10[k] as number;
   if (loDigits === 0) {
     // Clinger's fast path: hi and d are exact, one rounding.
-    decoded[0] = scale < 0 ? hi / d : hi * d;
+    io[2] = scale < 0 ? hi / d : hi * d;
     return true;
   }
   if (hi === 0) return false;
@@ -83,24 +64,56 @@ export function decimalToDouble(hi: number, lo: number, loDigits: number, scale:
   let xh = x - (x - hi);
   let xl = hi - xh;
   const p = hi * t;
-  const e = xh * th - p + xh * tl + xl * th + xl * tl + lo; // small integers: exact
+  const e = xh * th - p + xh * tl + xl * th + xl * tl + (io[1] as number); // small integers: exact
   const mh = p + e;
   const ml = e - (mh - p);
   const dh = POW10_HI[k] as number;
   const dl = POW10_LO[k] as number;
+  let q0: number;
+  let r: number;
+  let unit: number;
   if (scale >= 0) {
     // m·d − q0 = (mh·d − q0) + ml·d; the first term exactly, the second to 2^-53.
-    const q0 = mh * d;
+    q0 = mh * d;
     x = SPLIT * mh;
     xh = x - (x - mh);
     xl = mh - xh;
-    return round(q0, xh * dh - q0 + xh * dl + xl * dh + xl * dl + ml * d, 1);
+    r = xh * dh - q0 + xh * dl + xl * dh + xl * dl + ml * d;
+    unit = 1;
+  } else {
+    // m − q0·d = (mh − pp) − (q0·d − pp) + ml, in units of d; mh − pp is exact (Sterbenz).
+    q0 = mh / d;
+    const pp = q0 * d;
+    x = SPLIT * q0;
+    xh = x - (x - q0);
+    xl = q0 - xh;
+    r = mh - pp - (xh * dh - pp + xh * dl + xl * dh + xl * dl) + ml;
+    unit = d;
   }
-  // m − q0·d = (mh − pp) − (q0·d − pp) + ml, in units of d; mh − pp is exact (Sterbenz).
-  const q0 = mh / d;
-  const pp = q0 * d;
-  x = SPLIT * q0;
-  xh = x - (x - q0);
-  xl = q0 - xh;
-  return round(q0, mh - pp - (xh * dh - pp + xh * dl + xl * dh + xl * dl) + ml, d);
+  // The exact value is q0 + r/unit: q0 or its neighbour c (towards r), unless within 2^-20 of the
+  // halfway point between them.
+  if (r === 0) {
+    io[2] = q0;
+    return true;
+  }
+  f64[0] = q0;
+  let lo = (u32[LO] as number) + (r > 0 ? 1 : -1);
+  let hiWord = u32[HI] as number;
+  if (lo > 0xffffffff) {
+    lo = 0;
+    hiWord++;
+  } else if (lo < 0) {
+    lo = 0xffffffff;
+    hiWord--;
+  }
+  u32[LO] = lo;
+  u32[HI] = hiWord;
+  const c = f64[0] as number;
+  const half = (Math.abs(c - q0) * unit) / 2;
+  const a = Math.abs(r);
+  const margin = half * 2 ** -20;
+  if (a < half - margin) io[2] = q0;
+  else if (a > half + margin && a < 2 * half * 1.2) io[2] = c;
+  else return false;
+  return true;
 }

@@ -18,7 +18,7 @@
 import type { FileHandle } from 'node:fs/promises';
 import type { MetricKind } from './types.js';
 import { InputError, quote } from '../errors.js';
-import { decimalToDouble, decoded } from './decimal.js';
+import { decodeDecimal, io } from './decimal.js';
 
 export const CHUNK = 1 << 20;
 /** `advance()` results. */
@@ -102,6 +102,18 @@ function parseValue(raw: string, kind: MetricKind, file: string, line: number): 
   return value;
 }
 
+/** Whether the four bytes of w (little-endian) are all ASCII digits (common practice, "SWAR"). */
+function allDigits(w: number): boolean {
+  return (w & 0xf0f0f0f0) === 0x30303030 && ((w + 0x06060606) & 0xf0f0f0f0) === 0x30303030;
+}
+
+/** The number the four ASCII digits of w spell, the lowest byte being the first digit. */
+function fourDigits(w: number): number {
+  const d = w - 0x30303030;
+  const pairs = (Math.imul(d, 10) + (d >>> 8)) & 0x00ff00ff; // d0·10 + d1, d2·10 + d3
+  return (pairs & 0xff) * 100 + (pairs >>> 16);
+}
+
 export class PredictionLines {
   /** 1-based number of the last line read (readline's count: header and blank lines included). */
   line = 0;
@@ -118,6 +130,8 @@ export class PredictionLines {
   prevLen = -1;
 
   private buf: Buffer = Buffer.allocUnsafe(CHUNK);
+  /** `buf` read four bytes at a time (digits eight at a time in `number`). */
+  private view = new DataView(this.buf.buffer, this.buf.byteOffset, this.buf.length);
   private pos = 0;
   /** Bytes before `buf[0]`. */
   private dropped = 0;
@@ -150,6 +164,7 @@ export class PredictionLines {
       const bigger = Buffer.allocUnsafe(this.buf.length * 2);
       this.buf.copy(bigger, 0, this.pos, this.end);
       this.buf = bigger;
+      this.view = new DataView(bigger.buffer, bigger.byteOffset, bigger.length);
     } else if (this.pos > 0) this.buf.copyWithin(0, this.pos, this.end);
     this.pos = 0;
     this.end = rest;
@@ -255,6 +270,15 @@ export class PredictionLines {
     let scale = 0;
     if (p < end && c === 46) {
       const fracStart = ++p;
+      // Eight digits at a time while they fit in hi (a fraction is most of a loss's digits).
+      const view = this.view;
+      while (hi < 1e7 && p + 8 <= end) {
+        const w0 = view.getUint32(p, true);
+        const w1 = view.getUint32(p + 4, true);
+        if (!allDigits(w0) || !allDigits(w1)) break;
+        hi = hi * 1e8 + fourDigits(w0) * 10000 + fourDigits(w1);
+        p += 8;
+      }
       while (p < end && (c = buf[p] as number) >= 48 && c <= 57) {
         if (hi < 1e14) hi = hi * 10 + (c - 48);
         else {
@@ -285,8 +309,10 @@ export class PredictionLines {
     }
     if (c !== 10) return -1;
     let value: number;
-    if (decimalToDouble(hi, lo, loDigits, scale)) {
-      value = decoded[0] as number;
+    io[0] = hi;
+    io[1] = lo;
+    if (decodeDecimal(loDigits, scale)) {
+      value = io[2] as number;
       if (negative) value = -value;
     } else {
       value = Number(buf.toString('latin1', from, p));

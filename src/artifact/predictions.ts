@@ -231,7 +231,13 @@ class Pairing {
           if (x === 1 && y === 0) this.baselineOnly++;
           else if (x === 0 && y === 1) this.candidateOnly++;
         } else if (this.ringUsed) this.ring[(step - this.windowStart) * 3] = y - x;
-        else this.push(y - x);
+        else {
+          // Inline, not this.push(d): a double argument is an allocation per call.
+          const d = y - x;
+          if (d - d !== 0) this.refuse(d);
+          this.pending[this.pendingCount++] = d;
+          if (this.pendingCount === BATCH) this.flush();
+        }
       } else {
         this.ringUsed = !this.proportion;
         if (hasA) {
@@ -280,7 +286,9 @@ class Pairing {
       for (let i = 0; i < stop; i++) {
         const d = ring[i] as number;
         if (d === d) {
-          this.push(d);
+          if (d - d !== 0) this.refuse(d);
+          this.pending[this.pendingCount++] = d;
+          if (this.pendingCount === BATCH) this.flush();
           ring[i] = Number.NaN;
         }
       }
@@ -347,14 +355,10 @@ class Pairing {
     }
   }
 
-  private push(d: number): void {
-    // RunningStats refuses a non-finite value: let it throw now, as it would have.
-    if (d - d !== 0) {
-      this.flush();
-      this.diffs.push(d);
-    }
-    this.pending[this.pendingCount++] = d;
-    if (this.pendingCount === BATCH) this.flush();
+  /** RunningStats refuses a non-finite value: let it throw now, as it would have. */
+  private refuse(d: number): void {
+    this.flush();
+    this.diffs.push(d);
   }
 
   flush(): void {
