@@ -46087,12 +46087,7 @@ function decodeDecimal(loDigits, scale) {
   return true;
 }
 
-// src/artifact/prediction-lines.ts
-var CHUNK = 1 << 20;
-var ROW = 1;
-var END = 0;
-var NEED = -1;
-var AGAIN = 2;
+// src/artifact/byte-readers.ts
 function handleReader(handle) {
   let position = 0;
   return {
@@ -46127,6 +46122,13 @@ function iterableReader(make) {
     }
   };
 }
+
+// src/artifact/prediction-lines.ts
+var CHUNK = 1 << 20;
+var ROW = 1;
+var END = 0;
+var NEED = -1;
+var AGAIN = 2;
 var HEADER = { proportion: "id,correct", continuous: "id,loss" };
 function valueError(kind, file, line, raw) {
   const column = kind === "proportion" ? "correct" : "loss";
@@ -46444,64 +46446,7 @@ var PredictionLines = class {
   }
 };
 
-// src/artifact/predictions.ts
-async function openFile(f, opened) {
-  const source = f.source;
-  if (typeof source === "function") return { reader: () => iterableReader(source), size: null };
-  let handle;
-  if (source !== void 0) handle = source;
-  else {
-    if (f.path === void 0) throw new TypeError(`predictions file ${f.file}: no path or source`);
-    handle = await open2(f.path, "r");
-    opened.push(handle);
-  }
-  const size = (await handle.stat()).size;
-  return { reader: () => handleReader(handle), size };
-}
-async function row(lines) {
-  let r = lines.advance();
-  while (r === NEED) {
-    await lines.fill();
-    r = lines.advance();
-  }
-  return r === ROW;
-}
-async function repeatedIds(o, file, kind) {
-  const hashes = new HashSet64();
-  const suspects = /* @__PURE__ */ new Set();
-  let lines = new PredictionLines(o.reader(), file, kind);
-  try {
-    while (await row(lines)) {
-      hashId(lines.key, lines.keyStart, lines.keyLen);
-      if (!hashes.add(hashed.a, hashed.b)) suspects.add(`${hashed.a},${hashed.b}`);
-    }
-  } finally {
-    await lines.close();
-  }
-  const firstLine = /* @__PURE__ */ new Map();
-  const issues2 = [];
-  if (suspects.size === 0) return issues2;
-  lines = new PredictionLines(o.reader(), file, kind);
-  try {
-    while (await row(lines)) {
-      hashId(lines.key, lines.keyStart, lines.keyLen);
-      if (!suspects.has(`${hashed.a},${hashed.b}`)) continue;
-      const id = lines.id();
-      const first = firstLine.get(id);
-      if (first === void 0) firstLine.set(id, lines.line);
-      else
-        issues2.push({
-          file,
-          pointer: `line ${lines.line}`,
-          expected: `must have a unique id (also on line ${first})`,
-          got: quote(id)
-        });
-    }
-  } finally {
-    await lines.close();
-  }
-  return issues2;
-}
+// src/artifact/pairing.ts
 var DONE = 0;
 var NEED_A = 1;
 var NEED_B = 2;
@@ -46702,6 +46647,65 @@ var Pairing = class {
     this.pendingCount = 0;
   }
 };
+
+// src/artifact/predictions.ts
+async function openFile(f, opened) {
+  const source = f.source;
+  if (typeof source === "function") return { reader: () => iterableReader(source), size: null };
+  let handle;
+  if (source !== void 0) handle = source;
+  else {
+    if (f.path === void 0) throw new TypeError(`predictions file ${f.file}: no path or source`);
+    handle = await open2(f.path, "r");
+    opened.push(handle);
+  }
+  const size = (await handle.stat()).size;
+  return { reader: () => handleReader(handle), size };
+}
+async function row(lines) {
+  let r = lines.advance();
+  while (r === NEED) {
+    await lines.fill();
+    r = lines.advance();
+  }
+  return r === ROW;
+}
+async function repeatedIds(o, file, kind) {
+  const hashes = new HashSet64();
+  const suspects = /* @__PURE__ */ new Set();
+  let lines = new PredictionLines(o.reader(), file, kind);
+  try {
+    while (await row(lines)) {
+      hashId(lines.key, lines.keyStart, lines.keyLen);
+      if (!hashes.add(hashed.a, hashed.b)) suspects.add(`${hashed.a},${hashed.b}`);
+    }
+  } finally {
+    await lines.close();
+  }
+  const firstLine = /* @__PURE__ */ new Map();
+  const issues2 = [];
+  if (suspects.size === 0) return issues2;
+  lines = new PredictionLines(o.reader(), file, kind);
+  try {
+    while (await row(lines)) {
+      hashId(lines.key, lines.keyStart, lines.keyLen);
+      if (!suspects.has(`${hashed.a},${hashed.b}`)) continue;
+      const id = lines.id();
+      const first = firstLine.get(id);
+      if (first === void 0) firstLine.set(id, lines.line);
+      else
+        issues2.push({
+          file,
+          pointer: `line ${lines.line}`,
+          expected: `must have a unique id (also on line ${first})`,
+          got: quote(id)
+        });
+    }
+  } finally {
+    await lines.close();
+  }
+  return issues2;
+}
 async function pairPredictions(baseline, candidate, kind, tuning = TUNING) {
   const opened = [];
   let a = null;

@@ -15,10 +15,17 @@
  * string rules would give, so that equal bytes mean equal ids on both paths. The previous row's id
  * stays readable as `prevKey[prevStart, prevStart + prevLen)` (for the increasing-ids check).
  */
-import type { FileHandle } from 'node:fs/promises';
 import type { MetricKind } from './types.js';
 import { InputError, quote } from '../errors.js';
 import { decodeDecimal, io } from './decimal.js';
+import type { ByteReader } from './byte-readers.js';
+
+export {
+  handleReader,
+  iterableReader,
+  type ByteReader,
+  type PredictionsSource,
+} from './byte-readers.js';
 
 export const CHUNK = 1 << 20;
 /** `advance()` results. */
@@ -27,55 +34,6 @@ export const END = 0;
 export const NEED = -1;
 /** Internal: a segment went to the string path; look again. */
 const AGAIN = 2;
-
-/** Bytes of one file, from the start; `read` returns 0 at the end. */
-export interface ByteReader {
-  read(into: Uint8Array, offset: number, length: number): Promise<number>;
-  close(): Promise<void>;
-}
-
-/**
- * Where the bytes of a predictions file come from. The caller opens the file (and so decides what
- * may be opened: path, file type, size); the reader only reads it. A file handle is read with
- * explicit positions; a function returns a fresh stream of the whole file on every call. Both can
- * be read more than once (the duplicate-id check re-reads a file that has a repeated id).
- */
-export type PredictionsSource = FileHandle | (() => AsyncIterable<Uint8Array>);
-
-export function handleReader(handle: FileHandle): ByteReader {
-  let position = 0;
-  return {
-    async read(into, offset, length) {
-      const { bytesRead } = await handle.read(into, offset, length, position);
-      position += bytesRead;
-      return bytesRead;
-    },
-    async close() {},
-  };
-}
-
-export function iterableReader(make: () => AsyncIterable<Uint8Array>): ByteReader {
-  const iterator = make()[Symbol.asyncIterator]();
-  let chunk: Uint8Array | null = null;
-  let at = 0;
-  return {
-    async read(into, offset, length) {
-      while (chunk === null || at >= chunk.length) {
-        const next = await iterator.next();
-        if (next.done === true) return 0;
-        chunk = next.value;
-        at = 0;
-      }
-      const n = Math.min(length, chunk.length - at);
-      into.set(chunk.subarray(at, at + n), offset);
-      at += n;
-      return n;
-    },
-    async close() {
-      await iterator.return?.();
-    },
-  };
-}
 
 const HEADER: Record<MetricKind, string> = { proportion: 'id,correct', continuous: 'id,loss' };
 

@@ -1,0 +1,261 @@
+/**
+ * The pairing loop of pairPredictions (predictions.ts): two files read side by side, a row of each
+ * per step; rows with the same id pair at once, rows out of step meet in the id table.
+ */
+import type { MetricKind } from './types.js';
+import { RunningStats } from '../stats/index.js';
+import { IdBatch, MEET_BASE, MEET_CAND } from './id-batch.js';
+import type { IdTable } from './id-tables.js';
+import { BASE, CAND, INLINE_ID_BYTES, IdOrder, hashId, hashed, sameBytes } from './id-tables.js';
+import { NEED, ROW, type PredictionLines } from './prediction-lines.js';
+
+/** `run()` results. */
+export const DONE = 0;
+export const NEED_A = 1;
+export const NEED_B = 2;
+/** Steps of one pairing step. */
+const ADVANCE_A = 0;
+const ADVANCE_B = 1;
+const PAIR = 2;
+/** Loss differences are handed to RunningStats in batches (a double argument is an allocation). */
+const BATCH = 4096;
+/**
+ * Table operations are batched over `window` steps and grouped by table regions of 2^regionBits
+ * slots (about 100 KB). Smaller values only for tests: they reorder operations much more.
+ */
+export interface PairingTuning {
+  window: number;
+  regionBits: number;
+}
+export const TUNING: PairingTuning = { window: 32768, regionBits: 12 };
+/** Loss values beyond this can overflow a difference: then pairs are settled step by step. */
+const HUGE = 8e307;
+
+/**
+ * The pairing loop, synchronous between reads: `run()` pairs rows until a file needs more bytes or
+ * a file's ids stop increasing, and says which. Rows out of step go to the id table in batches
+ * (id-batch.ts). Pairs go to the counts (proportions) or to RunningStats (losses) in the original
+ * reader's order: a pair counts at the step its second row was read, the pair of the step's own
+ * rows first, then the baseline row's, then the candidate row's; a window of steps is held in
+ * `ring` until its batch is applied.
+ */
+export class Pairing {
+  rows = 0;
+  baselineOnly = 0;
+  candidateOnly = 0;
+  readonly diffs = new RunningStats();
+  /** Files (BASE | CAND) whose ids stopped increasing. */
+  unordered = 0;
+  readonly batch: IdBatch;
+  private hasA = true;
+  private hasB = true;
+  private phase = ADVANCE_A;
+  private step = 0;
+  private windowStart = 0;
+  /** Losses: pairs of the window by (step − windowStart) · 3 + k; NaN for none. */
+  private readonly ring: Float64Array;
+  private ringUsed = false;
+  private strict = false;
+  private readonly orderA = new IdOrder();
+  private readonly orderB = new IdOrder();
+  private readonly pending = new Float64Array(BATCH);
+  private pendingCount = 0;
+  private readonly proportion: boolean;
+
+  constructor(
+    readonly a: PredictionLines,
+    readonly b: PredictionLines,
+    readonly table: IdTable,
+    kind: MetricKind,
+    private readonly tuning: PairingTuning,
+    /** File sizes in bytes, when known. */
+    private readonly sizes: readonly [number | null, number | null],
+  ) {
+    this.proportion = kind === 'proportion';
+    this.batch = new IdBatch(2 * tuning.window);
+    this.ring = new Float64Array(this.proportion ? 0 : 3 * tuning.window).fill(Number.NaN);
+  }
+
+  run(): number {
+    const { a, b, batch } = this;
+    for (;;) {
+      if (this.phase === ADVANCE_A) {
+        if (this.hasA) {
+          const r = a.advance();
+          if (r === NEED) return NEED_A;
+          this.hasA = r === ROW;
+        }
+        this.phase = ADVANCE_B;
+      }
+      if (this.phase === ADVANCE_B) {
+        if (this.hasB) {
+          const r = b.advance();
+          if (r === NEED) return NEED_B;
+          this.hasB = r === ROW;
+        }
+        this.phase = PAIR;
+      }
+      const hasA = this.hasA;
+      const hasB = this.hasB;
+      if (!hasA && !hasB) return DONE;
+      if (
+        hasA &&
+        (this.unordered & BASE) === 0 &&
+        !this.orderA.next(a.key, a.keyStart, a.keyLen, a.prevKey, a.prevStart, a.prevLen)
+      )
+        this.unordered |= BASE;
+      if (
+        hasB &&
+        (this.unordered & CAND) === 0 &&
+        !this.orderB.next(b.key, b.keyStart, b.keyLen, b.prevKey, b.prevStart, b.prevLen)
+      )
+        this.unordered |= CAND;
+      const step = this.step;
+      if (!this.proportion && !this.strict) {
+        if ((hasA && !(Math.abs(a.value) <= HUGE)) || (hasB && !(Math.abs(b.value) <= HUGE)))
+          this.strict = true;
+      }
+      if (hasA && hasB && sameBytes(a.key, a.keyStart, a.keyLen, b.key, b.keyStart, b.keyLen)) {
+        this.rows++;
+        const x = a.value;
+        const y = b.value;
+        if (this.proportion) {
+          if (x === 1 && y === 0) this.baselineOnly++;
+          else if (x === 0 && y === 1) this.candidateOnly++;
+        } else if (this.ringUsed) this.ring[(step - this.windowStart) * 3] = y - x;
+        else {
+          // Inline, not this.push(d): a double argument is an allocation per call.
+          const d = y - x;
+          if (d - d !== 0) this.refuse(d);
+          this.pending[this.pendingCount++] = d;
+          if (this.pendingCount === BATCH) this.flush();
+        }
+      } else {
+        this.ringUsed = !this.proportion;
+        if (hasA) {
+          hashId(a.key, a.keyStart, a.keyLen);
+          if (a.keyLen <= INLINE_ID_BYTES) {
+            if (this.proportion)
+              batch.add(MEET_BASE | (a.value << 2), a.key, a.keyStart, a.keyLen, hashed.a, step);
+            else {
+              batch.add(MEET_BASE, a.key, a.keyStart, a.keyLen, hashed.a, step);
+              batch.values[batch.size - 1] = a.value;
+            }
+          } else this.now(MEET_BASE, a, step);
+        }
+        if (hasB) {
+          hashId(b.key, b.keyStart, b.keyLen);
+          if (b.keyLen <= INLINE_ID_BYTES) {
+            if (this.proportion)
+              batch.add(MEET_CAND | (b.value << 2), b.key, b.keyStart, b.keyLen, hashed.a, step);
+            else {
+              batch.add(MEET_CAND, b.key, b.keyStart, b.keyLen, hashed.a, step);
+              batch.values[batch.size - 1] = b.value;
+            }
+          } else this.now(MEET_CAND, b, step);
+        }
+      }
+      this.step++;
+      if (this.strict || this.step - this.windowStart === this.tuning.window || batch.full)
+        this.settle();
+      this.phase = ADVANCE_A;
+    }
+  }
+
+  /** A long id's table operation, at once (the table keeps long ids apart, in a Map). */
+  private now(kind: number, lines: PredictionLines, step: number): void {
+    this.table.incoming = lines.value;
+    this.table.incomingStep = step;
+    this.apply(kind, lines.key, lines.keyStart, lines.keyLen, hashed.a, step);
+  }
+
+  /** Applies the batch and hands on the pairs of the window's steps, in order. */
+  settle(): void {
+    this.applyBatch();
+    if (this.ringUsed) {
+      const ring = this.ring;
+      const stop = (this.step - this.windowStart) * 3;
+      for (let i = 0; i < stop; i++) {
+        const d = ring[i] as number;
+        if (d === d) {
+          if (d - d !== 0) this.refuse(d);
+          this.pending[this.pendingCount++] = d;
+          if (this.pendingCount === BATCH) this.flush();
+          ring[i] = Number.NaN;
+        }
+      }
+    }
+    this.windowStart = this.step;
+  }
+
+  applyBatch(): void {
+    const { batch, table } = this;
+    if (batch.size === 0) return;
+    table.widen(batch.longest);
+    // When about a row per step waits, the ids are shuffled: then rows wait up to half the file at
+    // once (a random order), and the table may as well grow to that in one step.
+    const rows = Math.max(this.estimate(this.a, 0), this.estimate(this.b, 1));
+    table.expected = table.size > this.step / 2 ? rows / 2 : 0;
+    // A small table grows once for the whole batch (not by doubling through it).
+    if (table.slots < 2 * batch.size) table.reserve(table.size + batch.size);
+    const order = batch.sorted(table, this.tuning.regionBits);
+    const keys = batch.keys;
+    for (let i = 0; i < batch.size; i++) {
+      const r = order[i] as number;
+      table.incoming = this.proportion ? batch.bit(r) : batch.value(r);
+      const step = batch.step(r);
+      table.incomingStep = step;
+      this.apply(batch.kind(r), keys, batch.keyStart(r), batch.len(r), batch.hash(r), step);
+    }
+    batch.clear();
+  }
+
+  /** About how many rows a file has, from its size and the bytes per row so far; 0 if unknown. */
+  private estimate(lines: PredictionLines, i: 0 | 1): number {
+    const size = this.sizes[i];
+    return size === null || size === undefined || lines.rows === 0
+      ? 0
+      : (size * lines.rows) / lines.consumed;
+  }
+
+  /** One table operation; a pair it makes goes to the counts or the ring. */
+  private apply(
+    kind: number,
+    key: Uint8Array,
+    start: number,
+    len: number,
+    hash: number,
+    step: number,
+  ): void {
+    const table = this.table;
+    {
+      const base = kind === MEET_BASE;
+      if (!table.meet(base ? BASE : CAND, key, start, len, hash)) return;
+      this.rows++;
+      const x = base ? table.incoming : table.partner;
+      const y = base ? table.partner : table.incoming;
+      if (this.proportion) {
+        if (x === 1 && y === 0) this.baselineOnly++;
+        else if (x === 0 && y === 1) this.candidateOnly++;
+        return;
+      }
+      // The pair counts when its second row was read; the baseline's row first at equal steps.
+      const later = step > table.partnerStep;
+      const at = later ? step : table.partnerStep;
+      const k = base === later ? 1 : 2;
+      this.ring[(at - this.windowStart) * 3 + k] = y - x;
+    }
+  }
+
+  /** RunningStats refuses a non-finite value: let it throw now, as it would have. */
+  private refuse(d: number): void {
+    this.flush();
+    this.diffs.push(d);
+  }
+
+  flush(): void {
+    const { pending, diffs } = this;
+    for (let i = 0; i < this.pendingCount; i++) diffs.push(pending[i] as number);
+    this.pendingCount = 0;
+  }
+}
