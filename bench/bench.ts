@@ -7,7 +7,7 @@ import { createInterface } from 'node:readline';
 import { join } from 'node:path';
 import { pairPredictions } from '../src/artifact/predictions.js';
 import { analyzeCurves } from '../src/analysis/curves/index.js';
-import type { CurvePoint } from '../src/artifact/types.js';
+import type { CurvePoint } from '../src/model/run.js';
 
 const ROWS = 1_000_000;
 const dir = join('node_modules', '.cache', 'fitgap-bench');

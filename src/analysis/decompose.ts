@@ -1,11 +1,11 @@
 /**
  * Error decomposition of one run (DESIGN.md §3) and its diagnosis (§6). Pure.
  */
-import type { RunArtifact } from '../artifact/types.js';
+import type { RunArtifact } from '../model/run.js';
 import { mean } from '../stats/index.js';
 import { shortfallSign, type Measure } from './measure.js';
 import { measureLevel } from './noise.js';
-import type { Component, ComponentName, Diagnosis, RunSummary } from './types.js';
+import type { Component, ComponentName, Diagnosis, RunSummary } from '../model/review.js';
 
 export interface ReferenceChoice {
   value: number | null;

@@ -1,5 +1,5 @@
 /** Number formatting shared by lever reasons and notes (renderers have their own). Pure. */
-import type { MetricKind } from '../artifact/types.js';
+import type { MetricKind } from '../model/run.js';
 
 /** A value in metric units: percent with one decimal for proportions, 4 significant digits otherwise. */
 export function formatValue(value: number, kind: MetricKind): string {

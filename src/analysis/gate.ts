@@ -1,5 +1,5 @@
 /** The gate (`fail-on`): which outcomes fail the required status check. Pure. */
-import type { Gate, Review } from './types.js';
+import type { Gate, Review } from '../model/review.js';
 
 type Outcome = Pick<Review, 'movement' | 'validation' | 'slices' | 'candidate' | 'settings'>;
 

@@ -2,11 +2,11 @@
  * Significance of a measure's change between two runs, and of a component being above 0 within
  * one run, choosing the test DESIGN.md §4 prescribes for the noise information available. Pure.
  */
-import type { RunArtifact } from '../artifact/types.js';
+import type { RunArtifact } from '../model/run.js';
 import { mean, normalCdf, normalTest, oneSampleT, welchT } from '../stats/index.js';
 import type { Interval, TestResult } from '../stats/types.js';
 import { binomialMeasureVariance, perRepeat, type Measure } from './measure.js';
-import type { Call, Delta } from './types.js';
+import type { Call, Delta } from '../model/review.js';
 
 export interface CallSettings {
   alpha: number;

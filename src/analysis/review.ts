@@ -2,8 +2,8 @@
  * Builds the review model from two validated runs (DESIGN.md §3–§8). Pure: no I/O, no
  * environment, no clock.
  */
-import type { RunArtifact, SplitName } from '../artifact/types.js';
-import { SPLIT_NAMES } from '../artifact/types.js';
+import type { RunArtifact, SplitName } from '../model/run.js';
+import { SPLIT_NAMES } from '../model/run.js';
 import {
   mcnemarExact,
   mean,
@@ -24,7 +24,7 @@ import {
 import { formatValue } from './format.js';
 import { applyGate } from './gate.js';
 import { diffHyperparameters, knobOf, pulledLevers } from './hyperparameters.js';
-import { chooseLevers } from './levers.js';
+import { chooseLevers } from './levers/choose.js';
 import { shortfallSign, splitMeasure, type Measure } from './measure.js';
 import { movementOf, validationChangeOf } from './movement.js';
 import { measureChange, toDelta, toMetricUnits, type CallSettings } from './noise.js';
@@ -36,23 +36,8 @@ import type {
   RunSummary,
   SplitChange,
   SplitSummary,
-} from './types.js';
-
-/** Summary of paired per-example predictions, computed by the streaming CSV reader. */
-export interface PairedPredictions {
-  kind: 'proportion' | 'continuous';
-  /** Rows present in both files (paired by id). */
-  rows: number;
-  /** Proportion: baseline correct & candidate wrong. */
-  baselineOnly?: number;
-  /** Proportion: baseline wrong & candidate correct. */
-  candidateOnly?: number;
-  /** Continuous: mean and sample variance of (candidate loss − baseline loss). */
-  meanDiff?: number;
-  varDiff?: number;
-  /** The split both prediction files are for. */
-  split?: SplitName;
-}
+  PairedPredictions,
+} from '../model/review.js';
 
 export interface ReviewInput {
   baseline: RunArtifact;

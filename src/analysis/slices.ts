@@ -2,11 +2,11 @@
  * Per-slice validation changes with Holm–Bonferroni correction over the slices tested, and the
  * slices that regressed while the aggregate improved. Pure.
  */
-import type { RunArtifact, Slice } from '../artifact/types.js';
+import type { RunArtifact, Slice } from '../model/run.js';
 import { binomialVariance, holmAdjust, normalTest } from '../stats/index.js';
 import type { TestResult } from '../stats/types.js';
 import { callOf, type CallSettings } from './noise.js';
-import type { SliceChange, ValidationChange } from './types.js';
+import type { SliceChange, ValidationChange } from '../model/review.js';
 
 function sliceTest(b: Slice, c: Slice, proportion: boolean, alpha: number): TestResult {
   const estimate = c.validation - b.validation;

@@ -2,9 +2,9 @@
  * Turns a CSV epoch log (e.g. `epoch,train_loss,val_loss`) into `curves.epochs` using the column
  * mapping from the config. Adapter helper: parses text it is given; the caller reads the file.
  */
-import { InputError, quote, type Issue } from '../errors.js';
-import type { EpochLogMapping } from '../config/types.js';
-import type { CurvePoint } from './types.js';
+import { InputError, quote, type Issue } from '../model/errors.js';
+import type { EpochLogMapping } from '../model/config.js';
+import type { CurvePoint } from '../model/run.js';
 
 function splitCsvLine(line: string): string[] {
   return line.split(',').map((cell) => cell.trim().replace(/^"(.*)"$/, '$1'));

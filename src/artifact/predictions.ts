@@ -6,10 +6,10 @@
  */
 import { createReadStream } from 'node:fs';
 import { createInterface } from 'node:readline';
-import type { MetricKind } from './types.js';
-import { InputError, quote, type Issue } from '../errors.js';
+import type { MetricKind } from '../model/run.js';
+import { InputError, quote, type Issue } from '../model/errors.js';
 import { RunningStats } from '../stats/index.js';
-import type { PairedPredictions } from '../analysis/review.js';
+import type { PairedPredictions } from '../model/review.js';
 
 interface Row {
   id: string;

@@ -1,5 +1,5 @@
 /** Parses JSON text, turning a syntax error into an `InputError` that names the line and column. */
-import { InputError } from '../errors.js';
+import { InputError } from '../model/errors.js';
 
 function lineAndColumn(text: string, offset: number): { line: number; column: number } {
   let line = 1;

@@ -2,7 +2,7 @@
  * Number formatting shared by the markdown and text renderers: one fixed number of decimals per
  * review (chosen from the size of the metric), signed deltas, intervals and p-values.
  */
-import type { Review } from '../analysis/types.js';
+import type { Review } from '../model/review.js';
 import type { Interval } from '../stats/types.js';
 
 export interface NumberFormat {

@@ -2,7 +2,7 @@
  * The headline of a review as data: a title and a few labelled sentences (movement, validation,
  * gate, next lever), shared by the markdown and text renderers.
  */
-import type { Delta, Review } from '../analysis/types.js';
+import type { Delta, Review } from '../model/review.js';
 import type { Escape } from './tables.js';
 import { interval, num, numberFormatFor, pValue, signed } from './format.js';
 import { sortSlices } from './tables.js';

@@ -6,7 +6,7 @@
  * the comment says what was dropped.
  */
 import { markdownTable } from 'markdown-table';
-import type { Review } from '../analysis/types.js';
+import type { Review } from '../model/review.js';
 import { escapeInline } from './escape.js';
 import { count } from './format.js';
 import { buildHeadline } from './headline.js';

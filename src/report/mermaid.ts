@@ -3,9 +3,9 @@
  * regularization curves (`xychart-beta` line charts, baseline against candidate). Pure functions of
  * the review. Artifact text reaches a chart only through `mermaidLabel`; numbers are fixed-decimal.
  */
-import type { Review, RunSummary } from '../analysis/types.js';
-import type { CurveSkipped, CurvesReport } from '../analysis/curves/types.js';
-import type { CurveName } from '../artifact/types.js';
+import type { Review, RunSummary } from '../model/review.js';
+import type { CurveSkipped, CurvesReport } from '../model/curves.js';
+import type { CurveName } from '../model/run.js';
 import { escapeInline, mermaidLabel } from './escape.js';
 import { chartNumber, num, numberFormatFor, short } from './format.js';
 

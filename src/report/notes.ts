@@ -2,9 +2,9 @@
  * The prose parts of a review as lists of lines: method notes, curve evidence and provenance.
  * Artifact text goes through the renderer's `esc`.
  */
-import type { Delta, Review, RunSummary } from '../analysis/types.js';
-import type { CurveSkipped } from '../analysis/curves/types.js';
-import type { CurveName } from '../artifact/types.js';
+import type { Delta, Review, RunSummary } from '../model/review.js';
+import type { CurveSkipped } from '../model/curves.js';
+import type { CurveName } from '../model/run.js';
 import type { TestName } from '../stats/types.js';
 import type { Escape, Table } from './tables.js';
 import { count, num, numberFormatFor, short } from './format.js';

@@ -3,7 +3,7 @@
  * Artifact text goes through the `esc` function the renderer passes in (markdown or terminal
  * escaping); our own words and numbers need none.
  */
-import type { Review, SliceChange } from '../analysis/types.js';
+import type { Review, SliceChange } from '../model/review.js';
 import { displayValue } from './escape.js';
 import { count, interval, num, numberFormatFor, pValue, signed } from './format.js';
 import {

@@ -4,7 +4,7 @@
  * `terminalText`, which removes ESC and every other control character, so an artifact cannot send
  * terminal escape sequences. Widths count code points (wide East Asian characters count as one).
  */
-import type { Review } from '../analysis/types.js';
+import type { Review } from '../model/review.js';
 import { terminalText, truncate } from './escape.js';
 import { count } from './format.js';
 import { buildHeadline } from './headline.js';

@@ -7,8 +7,8 @@ import type {
   Movement,
   Review,
   ValidationChange,
-} from '../analysis/types.js';
-import type { SplitName } from '../artifact/types.js';
+} from '../model/review.js';
+import type { SplitName } from '../model/run.js';
 import type { TestName } from '../stats/types.js';
 
 export const MOVEMENT_TITLE: Record<Movement, string> = {

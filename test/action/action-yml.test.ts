@@ -48,7 +48,7 @@ test('runs the bundled entry on node24', () => {
 });
 
 test('every input the settings reader asks for is declared, and every declared one is read', () => {
-  const source = readFileSync(join(ROOT, 'src/action/settings.ts'), 'utf8');
+  const source = readFileSync(join(ROOT, 'src/entries/action/settings.ts'), 'utf8');
   const read = new Set(
     [
       ...source.matchAll(/(?:optional|required|oneOf(?:<\w+>)?|number|getInput)\(\s*'([a-z-]+)'/g),
@@ -59,7 +59,7 @@ test('every input the settings reader asks for is declared, and every declared o
 
 test('every output the action sets is declared', () => {
   const sources = ['publish-steps.ts']
-    .map((f) => readFileSync(join(ROOT, 'src/action', f), 'utf8'))
+    .map((f) => readFileSync(join(ROOT, 'src/entries/action', f), 'utf8'))
     .join('\n');
   const set = new Set([...sources.matchAll(/setOutput\('([a-z-]+)'/g)].map((m) => m[1]));
   expect([...set].sort()).toEqual(Object.keys(yml.outputs).sort());

@@ -6,9 +6,9 @@
  */
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { LEVER_CATALOGUE } from '../../src/analysis/levers.js';
+import { LEVER_CATALOGUE } from '../../src/analysis/levers/choose.js';
 import { buildReview } from '../../src/analysis/review.js';
-import type { LeverId } from '../../src/analysis/types.js';
+import type { LeverId } from '../../src/model/review.js';
 import { makeRun, SETTINGS } from './make-run.js';
 
 describe('lever catalogue (common practice)', () => {

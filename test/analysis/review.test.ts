@@ -2,7 +2,7 @@ import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { buildReview } from '../../src/analysis/review.js';
 import { movementOf } from '../../src/analysis/movement.js';
-import { validateRun } from '../../src/artifact/validate.js';
+import { validateRun } from '../../src/validate/run.js';
 import { makeRun, SETTINGS } from './make-run.js';
 
 describe('movement table (DESIGN.md §5)', () => {

@@ -4,7 +4,7 @@ import { join } from 'node:path';
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { pairPredictions } from '../../src/artifact/predictions.js';
-import { InputError } from '../../src/errors.js';
+import { InputError } from '../../src/model/errors.js';
 
 const dir = mkdtempSync(join(tmpdir(), 'fitgap-pred-'));
 let counter = 0;

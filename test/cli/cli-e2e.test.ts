@@ -7,7 +7,7 @@ import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { promisify } from 'node:util';
 import { beforeAll, describe, expect, it } from 'vitest';
-import { MAIN_HELP, REVIEW_HELP } from '../../src/cli/help.js';
+import { MAIN_HELP, REVIEW_HELP } from '../../src/entries/cli/help.js';
 
 const run = promisify(execFile);
 const cli = resolve('dist/cli.js');

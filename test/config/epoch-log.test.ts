@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { reviewFiles, resolveSettings } from '../../src/review-files.js';
-import { parseConfig } from '../../src/config/load-config.js';
+import { reviewFiles, resolveSettings } from '../../src/io/review-from-files.js';
+import { parseConfig } from '../../src/io/load-config.js';
 
 describe('config', () => {
   it('maps a CSV epoch log next to each artifact onto curves.epochs', async () => {

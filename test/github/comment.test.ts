@@ -1,5 +1,5 @@
 import { describe, test } from 'vitest';
-import { MAX_COMMENT_CHARS, isOurs, publishComment } from '../../src/github/comment.js';
+import { MAX_COMMENT_CHARS, isOurs, publishComment } from '../../src/io/github/comment.js';
 import { BOT, PERSON } from '../fake-github/repo.js';
 import { fakeGitHub } from './fixture.js';
 

@@ -1,8 +1,8 @@
 import { strToU8, zipSync } from 'fflate';
 import { describe, expect, test } from 'vitest';
-import { pickRunFiles } from '../../src/github/artifacts.js';
-import { InputError } from '../../src/errors.js';
-import { listEntries, readEntry, unsafeName } from '../../src/github/zip.js';
+import { pickRunFiles } from '../../src/io/github/artifacts.js';
+import { InputError } from '../../src/model/errors.js';
+import { listEntries, readEntry, unsafeName } from '../../src/io/github/zip.js';
 
 const RUN = JSON.stringify({
   format: 'fitgap-run/1',

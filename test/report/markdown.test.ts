@@ -1,7 +1,7 @@
 import fc from 'fast-check';
 import { markdownTable } from 'markdown-table';
 import { describe, expect, it } from 'vitest';
-import type { Review } from '../../src/analysis/types.js';
+import type { Review } from '../../src/model/review.js';
 import { escapeInline, plainText } from '../../src/report/escape.js';
 import { renderMarkdown } from '../../src/report/markdown.js';
 import { parseMarker } from '../../src/report/marker.js';

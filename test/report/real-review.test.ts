@@ -8,7 +8,7 @@
 import mermaid from 'mermaid';
 import { describe, expect, it } from 'vitest';
 import { buildReview } from '../../src/analysis/review.js';
-import type { Review } from '../../src/analysis/types.js';
+import type { Review } from '../../src/model/review.js';
 import { renderJson } from '../../src/report/json.js';
 import { renderMarkdown } from '../../src/report/markdown.js';
 import { renderText } from '../../src/report/text.js';

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import type { Review } from '../../src/analysis/types.js';
+import type { Review } from '../../src/model/review.js';
 import { renderText, textTable, wrap } from '../../src/report/text.js';
 import { bakeryReview } from '../fixtures/report/bakery.js';
 import { deliveryReview } from '../fixtures/report/delivery.js';

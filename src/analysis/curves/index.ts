@@ -8,7 +8,7 @@
  * otherwise (error-scale.ts). Power-law parameters a, b, c and the residual are in those error
  * units; every value reported back (projections, best/final validation, charts) is in metric units.
  */
-import type { CurvePoint, Curves, Goal, MetricKind } from '../../artifact/types.js';
+import type { CurvePoint, Curves, Goal, MetricKind } from '../../model/run.js';
 import type { Interval } from '../../stats/types.js';
 import { epochVerdict } from './early-stopping.js';
 import { errorScale, type ErrorScale } from './error-scale.js';
@@ -22,9 +22,9 @@ import type {
   EpochsEvidence,
   LearningCurveEvidence,
   RegularizationEvidence,
-} from './types.js';
+} from '../../model/curves.js';
 
-export type * from './types.js';
+export type * from '../../model/curves.js';
 export { fitLeastSquares } from './levenberg-marquardt.js';
 export type { LeastSquaresFit, LeastSquaresProblem } from './levenberg-marquardt.js';
 export { generalizationLoss, progressQuotient, trainingProgress } from './early-stopping.js';

@@ -1,14 +1,14 @@
 import { readFileSync } from 'node:fs';
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import type { CurvePoint } from '../../../src/artifact/types.js';
+import type { CurvePoint } from '../../../src/model/run.js';
 import * as curves from '../../../src/analysis/curves/index.js';
 import { analyzeCurves, CHART_POINTS } from '../../../src/analysis/curves/index.js';
 import type {
   EpochsEvidence,
   LearningCurveEvidence,
   RegularizationEvidence,
-} from '../../../src/analysis/curves/types.js';
+} from '../../../src/model/curves.js';
 import { fixturePath } from './nist-fixtures.js';
 
 const minimizeProportion = { kind: 'proportion', goal: 'minimize' } as const;
