@@ -11,4 +11,12 @@ export {
   wilsonInterval,
 } from './proportions.js';
 export { holmAdjust } from './holm.js';
+export { nonInferiorityCalls, nonInferiorityTest, welchWorsening } from './non-inferiority.js';
+export type {
+  NonInferiorityCall,
+  NonInferiorityTest,
+  WorseningEstimate,
+} from './non-inferiority.js';
+export { logRatio } from './ratio.js';
+export type { RatioEstimate } from './ratio.js';
 export type { Interval, TestName, TestResult } from './types.js';

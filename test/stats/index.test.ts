@@ -8,8 +8,11 @@ describe('src/stats public surface', () => {
       'binomialCdf',
       'binomialVariance',
       'holmAdjust',
+      'logRatio',
       'mcnemarExact',
       'mean',
+      'nonInferiorityCalls',
+      'nonInferiorityTest',
       'normalCdf',
       'normalQuantile',
       'normalTest',
@@ -21,6 +24,7 @@ describe('src/stats public surface', () => {
       'tQuantile',
       'twoProportionZ',
       'welchT',
+      'welchWorsening',
       'wilsonInterval',
     ]);
   });
