@@ -134,7 +134,8 @@ def add_search_curve(run, search, *, param, scoring=None, fixed=None, curve="reg
         _fail("cv_results_", f"has no 'mean_test_{suffix}' column; pass the scorer name it used")
     params = _plain(results["params"], "cv_results_['params']")
     test = _plain(results[f"mean_test_{suffix}"], "cv_results_")
-    train = _plain(results[f"mean_train_{suffix}"], "cv_results_") if f"mean_train_{suffix}" in results else None
+    train_key = f"mean_train_{suffix}"
+    train = _plain(results[train_key], "cv_results_") if train_key in results else None
     rows = [i for i, p in enumerate(params) if param in p
             and all(p.get(k) == v for k, v in fixed.items() if k != param and k in p)]
     if not rows:
@@ -142,7 +143,7 @@ def add_search_curve(run, search, *, param, scoring=None, fixed=None, curve="reg
     xs = [params[i][param] for i in rows]
     convert = lambda s: scores_to_metric(s, scoring=scoring, goal=run.goal)  # noqa: E731
     validation = _fold_means(convert([[test[i]] for i in rows]), f"mean_test_{suffix}")
-    train_values = _fold_means(convert([[train[i]] for i in rows]), f"mean_train_{suffix}") if train else None
+    train_values = None if train is None else _fold_means(convert([[train[i]] for i in rows]), train_key)
     return _curve(run, curve, xs, train_values, validation, param, inverse)
 
 

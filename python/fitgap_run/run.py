@@ -1,7 +1,8 @@
 """Write ``fitgap-run/1`` run artifacts from Python training code.
 
 Standard library only; numpy and pandas values are accepted and converted when they are present.
-This file stands alone: copy it into a project as ``fitgap_run.py`` to use it without installing.
+This file stands alone: copy it into a project as ``fitgap_run.py`` to use it without installing
+(which is why the checks and the builder share one file).
 
     run = Run("out/candidate.json", name="late-sailings-C0.1", metric="accuracy",
               goal="maximize", kind="proportion", best=1.0)
@@ -47,17 +48,16 @@ INVERSE_KNOBS_KEY = "inverse_knobs"
 CURVE_KNOBS_KEY = "curve_knobs"
 #: Default agreement between per-example values and a split value: 1e-6 x max(1, |value|).
 DEFAULT_TOLERANCE = 1e-6
-VALIDATE_HINT = "Run `npx fitgap validate FILE` for the full schema and the predictions check."
 
 
 class ArtifactError(ValueError):
     """Bad input for a run artifact. ``issues`` holds ``(path, message)`` pairs; a path reads like
     ``splits.validation.values[2]``."""
 
-    def __init__(self, issues):
+    def __init__(self, issues, note=None):
         self.issues = list(issues)
         text = "; ".join(f"{path or 'artifact'}: {message}" for path, message in self.issues)
-        super().__init__(text)
+        super().__init__(f"{text} ({note})" if note else text)
 
 
 def _fail(path, message):
@@ -131,6 +131,7 @@ def _is_num(value):
 
 
 _DATE_TIME = re.compile(r"^\d{4}-\d\d-\d\dT\d\d:\d\d:\d\d(\.\d+)?(Z|[+-]\d\d:\d\d)$", re.I)
+_DRIVE = re.compile(r"^[A-Za-z]:")
 
 
 def check_artifact(doc):
@@ -138,206 +139,223 @@ def check_artifact(doc):
 
     Returns a list of ``(path, message)`` pairs, empty when nothing was found. Passing these checks
     does not make an artifact valid: ``npx fitgap validate FILE`` runs the full schema."""
-    issues = []
-    add = lambda path, message: issues.append((path, message))  # noqa: E731
     if not isinstance(doc, dict):
         return [("", "must be a JSON object")]
-    _non_finite(doc, "", issues)
+    return _Checks(doc).issues
 
-    def known(obj, path, keys):
+
+class _Checks:
+    """One pass over a parsed artifact; ``issues`` collects ``(path, message)`` pairs."""
+
+    def __init__(self, doc):
+        self.issues = []
+        self.seen = []  # (value, path) of every metric value, for the metric.best rule
+        self.repeats = None  # (split name, number of values) of the first split
+        _non_finite(doc, "", self.issues)
+        self.known(doc, "", TOP_LEVEL_KEYS)
+        for key in ("format", "run", "metric", "splits"):
+            if key not in doc:
+                self.add(key, "is required")
+        if "format" in doc and doc["format"] != FORMAT:
+            self.add("format", f"must be {FORMAT!r} (got {doc['format']!r})")
+        run = self.object(doc, "run")
+        if run is not None:
+            self.run(run)
+        metric = self.object(doc, "metric") or {}
+        self.metric(metric)
+        self.proportion = metric.get("kind") == "proportion"
+        if "reference" in doc:
+            self.value(doc["reference"], "reference")
+        splits = self.object(doc, "splits")
+        if splits is not None:
+            self.splits(splits)
+        self.object(doc, "hyperparameters")
+        curves = self.object(doc, "curves")
+        if curves is not None:
+            self.curves(curves)
+        if "slices" in doc:
+            self.slices(doc["slices"])
+        predictions = self.object(doc, "predictions")
+        if predictions is not None:
+            self.predictions(predictions, splits if isinstance(splits, dict) else {})
+        if metric.get("goal") == "maximize" and "best" not in metric:
+            above = [path for v, path in self.seen if math.isfinite(v) and v > 1]
+            if above:
+                self.add("metric.best", f"is needed: {above[0]} is above 1 for a maximized metric; "
+                                        "state the best possible value (100 for a 0-100 score)")
+
+    def add(self, path, message):
+        self.issues.append((path, message))
+
+    def known(self, obj, path, keys):
         for key in obj:
             if key not in keys:
-                add(f"{path}.{key}" if path else key, f"is not a known key here (known: {', '.join(keys)})")
+                self.add(f"{path}.{key}" if path else key,
+                         f"is not a known key here (known: {', '.join(keys)})")
 
-    def text(obj, key, path, longest, required=True):
+    def object(self, parent, key, path=None):
+        value = parent.get(key)
+        if value is not None and not isinstance(value, dict):
+            self.add(path or key, "must be an object")
+            return None
+        return value
+
+    def text(self, obj, key, path, longest, required=True):
         value = obj.get(key)
-        if value is None and not required:
-            return
-        if not isinstance(value, str) or not 1 <= len(value) <= longest:
-            add(path, f"must be a string of 1 to {longest} characters (got {value!r})")
+        if (value is not None or required) and not (isinstance(value, str) and 1 <= len(value) <= longest):
+            self.add(path, f"must be a string of 1 to {longest} characters (got {value!r})")
 
-    known(doc, "", TOP_LEVEL_KEYS)
-    for key in ("format", "run", "metric", "splits"):
-        if key not in doc:
-            add(key, "is required")
-    if "format" in doc and doc["format"] != FORMAT:
-        add("format", f"must be {FORMAT!r} (got {doc['format']!r})")
-    run = doc.get("run")
-    if isinstance(run, dict):
-        known(run, "run", ("name", "commit", "createdAt"))
-        text(run, "name", "run.name", 200)
-        text(run, "commit", "run.commit", 64, required=False)
+    def choice(self, obj, key, path, allowed):
+        if key in obj and obj[key] not in allowed:
+            self.add(path, f"must be one of {', '.join(allowed)} (got {obj[key]!r})")
+
+    def count(self, obj, key, path):
+        value = obj.get(key)
+        if key in obj and not (isinstance(value, int) and not isinstance(value, bool) and value >= 1):
+            self.add(path, f"must be a whole number >= 1 (got {value!r})")
+
+    def value(self, v, path):
+        """A value in metric units."""
+        if not _is_num(v):
+            self.add(path, f"must be a number (got {v!r})")
+            return
+        self.seen.append((v, path))
+        if self.proportion and math.isfinite(v) and not 0 <= v <= 1:
+            self.add(path, f"must be within [0, 1] for a proportion metric (got {v!r}); "
+                           "write rates as fractions (0.07, not 7) or declare kind 'continuous'")
+
+    def run(self, run):
+        self.known(run, "run", ("name", "commit", "createdAt"))
+        self.text(run, "name", "run.name", 200)
+        self.text(run, "commit", "run.commit", 64, required=False)
         created = run.get("createdAt")
         if created is not None and not (isinstance(created, str) and _DATE_TIME.match(created)):
-            add("run.createdAt", f"must be an RFC 3339 date-time with a time zone (got {created!r})")
-    elif run is not None:
-        add("run", "must be an object")
+            self.add("run.createdAt", f"must be an RFC 3339 date-time with a time zone (got {created!r})")
 
-    metric = doc.get("metric") if isinstance(doc.get("metric"), dict) else {}
-    if "metric" in doc and not isinstance(doc["metric"], dict):
-        add("metric", "must be an object")
-    if metric:
-        known(metric, "metric", ("name", "goal", "kind", "best", "unit"))
-        text(metric, "name", "metric.name", 100)
-        text(metric, "unit", "metric.unit", 40, required=False)
-        if metric.get("goal") not in ("minimize", "maximize"):
-            add("metric.goal", f"must be 'minimize' or 'maximize' (got {metric.get('goal')!r})")
-        if metric.get("kind") not in ("proportion", "continuous"):
-            add("metric.kind", f"must be 'proportion' or 'continuous' (got {metric.get('kind')!r})")
+    def metric(self, metric):
+        self.known(metric, "metric", ("name", "goal", "kind", "best", "unit"))
+        self.text(metric, "name", "metric.name", 100)
+        self.text(metric, "unit", "metric.unit", 40, required=False)
+        for key, allowed in (("goal", ("minimize", "maximize")), ("kind", ("proportion", "continuous"))):
+            if key not in metric:
+                self.add(f"metric.{key}", "is required")
+            self.choice(metric, key, f"metric.{key}", allowed)
         if "best" in metric and not _is_num(metric["best"]):
-            add("metric.best", f"must be a number (got {metric['best']!r})")
-    proportion = metric.get("kind") == "proportion"
-    seen = []
+            self.add("metric.best", f"must be a number (got {metric['best']!r})")
 
-    def value(v, path):
-        if not _is_num(v):
-            add(path, f"must be a number (got {v!r})")
-            return
-        seen.append((v, path))
-        if proportion and math.isfinite(v) and not 0 <= v <= 1:
-            add(path, f"must be within [0, 1] for a proportion metric (got {v!r}); "
-                      "write rates as fractions (0.07, not 7) or declare kind 'continuous'")
-
-    def count(obj, key, path):
-        if key in obj and not (isinstance(obj[key], int) and not isinstance(obj[key], bool)
-                               and obj[key] >= 1):
-            add(path, f"must be a whole number >= 1 (got {obj[key]!r})")
-
-    if "reference" in doc:
-        value(doc["reference"], "reference")
-    splits = doc.get("splits")
-    repeats = None
-    if isinstance(splits, dict):
-        known(splits, "splits", SPLIT_NAMES)
+    def splits(self, splits):
+        self.known(splits, "splits", SPLIT_NAMES)
         for name in ("train", "validation"):
             if name not in splits:
-                add(f"splits.{name}", "is required")
+                self.add(f"splits.{name}", "is required")
         for name in SPLIT_NAMES:
-            split = splits.get(name)
+            at = f"splits.{name}"
+            split = self.object(splits, name, at)
             if split is None:
                 continue
-            at = f"splits.{name}"
-            if not isinstance(split, dict):
-                add(at, "must be an object")
-                continue
-            known(split, at, ("examples", "values", "evaluationRows"))
-            count(split, "examples", f"{at}.examples")
-            if "evaluationRows" in split and split["evaluationRows"] not in EVALUATION_ROWS:
-                add(f"{at}.evaluationRows", f"must be one of {EVALUATION_ROWS} (got {split['evaluationRows']!r})")
+            self.known(split, at, ("examples", "values", "evaluationRows"))
+            self.count(split, "examples", f"{at}.examples")
+            self.choice(split, "evaluationRows", f"{at}.evaluationRows", EVALUATION_ROWS)
             values = split.get("values")
             if not isinstance(values, list) or not values:
-                add(f"{at}.values", "must be a non-empty list, one value per repeat")
+                self.add(f"{at}.values", "must be a non-empty list, one value per repeat")
                 continue
             for i, v in enumerate(values):
-                value(v, f"{at}.values[{i}]")
-            if repeats is None:
-                repeats = (name, len(values))
-            elif len(values) != repeats[1]:
-                add(f"{at}.values", f"has {len(values)} values but splits.{repeats[0]}.values has "
-                                    f"{repeats[1]}; position i in every split is the same trained model")
-    elif splits is not None:
-        add("splits", "must be an object")
+                self.value(v, f"{at}.values[{i}]")
+            if self.repeats is None:
+                self.repeats = (name, len(values))
+            elif len(values) != self.repeats[1]:
+                first, n = self.repeats
+                self.add(f"{at}.values", f"has {len(values)} values but splits.{first}.values has {n}; "
+                                         "position i in every split is the same trained model")
 
-    if "hyperparameters" in doc and not isinstance(doc["hyperparameters"], dict):
-        add("hyperparameters", "must be an object")
-    curves = doc.get("curves")
-    if isinstance(curves, dict):
-        known(curves, "curves", CURVE_NAMES + ("sources",))
-        sources = curves.get("sources", {})
-        if isinstance(sources, dict):
-            known(sources, "curves.sources", CURVE_NAMES)
-            for name, source in sources.items():
-                if source not in CURVE_SOURCES:
-                    add(f"curves.sources.{name}", f"must be one of {CURVE_SOURCES} (got {source!r})")
-        else:
-            add("curves.sources", "must be an object")
+    def curves(self, curves):
+        self.known(curves, "curves", CURVE_NAMES + ("sources",))
+        sources = self.object(curves, "sources", "curves.sources") or {}
+        self.known(sources, "curves.sources", CURVE_NAMES)
+        for name in sources:
+            self.choice(sources, name, f"curves.sources.{name}", CURVE_SOURCES)
         for name in CURVE_NAMES:
             points = curves.get(name)
             if points is None:
                 continue
             if not isinstance(points, list) or not points:
-                add(f"curves.{name}", "must be a non-empty list of points")
+                self.add(f"curves.{name}", "must be a non-empty list of points")
                 continue
             previous = None
             for i, point in enumerate(points):
-                at = f"curves.{name}[{i}]"
-                if not isinstance(point, dict):
-                    add(at, "must be an object with x and validation")
-                    continue
-                known(point, at, ("x", "train", "validation"))
-                for key in ("x", "validation"):
-                    if key not in point:
-                        add(f"{at}.{key}", "is required")
-                for key in ("train", "validation"):
-                    if key in point:
-                        value(point[key], f"{at}.{key}")
-                x = point.get("x")
-                if not _is_num(x):
-                    add(f"{at}.x", f"must be a number (got {x!r})")
-                    continue
-                if name in ("regularization", "training_examples") and x <= 0:
-                    add(f"{at}.x", f"must be > 0 for the {name} curve (got {x!r})")
-                if previous is not None and not x > previous:
-                    add(f"{at}.x", f"must be greater than the previous x ({previous!r}); "
-                                   "sort the points by x and drop duplicates")
-                previous = x
-    elif curves is not None:
-        add("curves", "must be an object")
+                previous = self.point(name, i, point, previous)
 
-    slices = doc.get("slices")
-    if isinstance(slices, list):
+    def point(self, name, i, point, previous):
+        """Checks one curve point; returns its x for the next point's comparison."""
+        at = f"curves.{name}[{i}]"
+        if not isinstance(point, dict):
+            self.add(at, "must be an object with x and validation")
+            return previous
+        self.known(point, at, ("x", "train", "validation"))
+        for key in ("x", "validation"):
+            if key not in point:
+                self.add(f"{at}.{key}", "is required")
+        for key in ("train", "validation"):
+            if key in point:
+                self.value(point[key], f"{at}.{key}")
+        x = point.get("x")
+        if not _is_num(x):
+            if "x" in point:
+                self.add(f"{at}.x", f"must be a number (got {x!r})")
+            return previous
+        if name in ("regularization", "training_examples") and x <= 0:
+            self.add(f"{at}.x", f"must be > 0 for the {name} curve (got {x!r})")
+        if previous is not None and not x > previous:
+            self.add(f"{at}.x", f"must be greater than the previous x ({previous!r}); "
+                                "sort the points by x and drop duplicates")
+        return x
+
+    def slices(self, slices):
+        if not isinstance(slices, list):
+            self.add("slices", "must be a list")
+            return
         names = {}
         for i, item in enumerate(slices):
             at = f"slices[{i}]"
             if not isinstance(item, dict):
-                add(at, "must be an object")
+                self.add(at, "must be an object")
                 continue
-            known(item, at, ("name", "examples", "train", "validation"))
+            self.known(item, at, ("name", "examples", "train", "validation"))
             name = item.get("name")
             if not isinstance(name, str) or not name:
-                add(f"{at}.name", f"must be a non-empty string (got {name!r})")
+                self.add(f"{at}.name", f"must be a non-empty string (got {name!r})")
             elif name in names:
-                add(f"{at}.name", f"must be unique (also at slices[{names[name]}].name)")
+                self.add(f"{at}.name", f"must be unique (also at slices[{names[name]}].name)")
             else:
                 names[name] = i
-            count(item, "examples", f"{at}.examples")
+            self.count(item, "examples", f"{at}.examples")
             if "validation" not in item:
-                add(f"{at}.validation", "is required")
+                self.add(f"{at}.validation", "is required")
             for key in ("train", "validation"):
                 if key in item:
-                    value(item[key], f"{at}.{key}")
-    elif slices is not None:
-        add("slices", "must be a list")
+                    self.value(item[key], f"{at}.{key}")
 
-    predictions = doc.get("predictions")
-    if isinstance(predictions, dict):
-        known(predictions, "predictions", ("split", "path", "aggregate", "repeat"))
+    def predictions(self, predictions, splits):
+        self.known(predictions, "predictions", ("split", "path", "aggregate", "repeat"))
         split = predictions.get("split")
         if split not in SPLIT_NAMES:
-            add("predictions.split", f"must be one of {SPLIT_NAMES} (got {split!r})")
-        elif not isinstance(splits, dict) or split not in splits:
-            add("predictions.split", f"names splits.{split}, which the artifact does not have")
+            self.add("predictions.split", f"must be one of {', '.join(SPLIT_NAMES)} (got {split!r})")
+        elif split not in splits:
+            self.add("predictions.split", f"names splits.{split}, which the artifact does not have")
         path = predictions.get("path")
         if not isinstance(path, str) or not path:
-            add("predictions.path", "must be a non-empty string")
-        elif path.startswith(("/", "\\")) or re.match(r"^[A-Za-z]:", path) or ".." in re.split(r"[\\/]", path):
-            add("predictions.path", f"must be a relative path inside the artifact's folder (got {path!r})")
-        if "aggregate" in predictions and predictions["aggregate"] not in AGGREGATES:
-            add("predictions.aggregate", f"must be one of {AGGREGATES} (got {predictions['aggregate']!r})")
+            self.add("predictions.path", "must be a non-empty string")
+        elif path.startswith(("/", "\\")) or _DRIVE.match(path) or ".." in re.split(r"[\\/]", path):
+            self.add("predictions.path",
+                     f"must be a relative path inside the artifact's folder (got {path!r})")
+        self.choice(predictions, "aggregate", "predictions.aggregate", AGGREGATES)
         repeat = predictions.get("repeat", 0)
         if isinstance(repeat, bool) or not isinstance(repeat, int) or repeat < 0:
-            add("predictions.repeat", f"must be a whole number >= 0 (got {repeat!r})")
-        elif repeats is not None and repeat >= repeats[1]:
-            add("predictions.repeat", f"is {repeat} but the splits have {repeats[1]} repeats (0-based)")
-    elif predictions is not None:
-        add("predictions", "must be an object")
-
-    if metric.get("goal") == "maximize" and "best" not in metric:
-        above = [path for v, path in seen if math.isfinite(v) and v > 1]
-        if above:
-            add("metric.best", f"is needed: {above[0]} is above 1 for a maximized metric; state the "
-                               "best possible value (100 for a 0-100 score)")
-    return issues
+            self.add("predictions.repeat", f"must be a whole number >= 0 (got {repeat!r})")
+        elif self.repeats is not None and repeat >= self.repeats[1]:
+            self.add("predictions.repeat", f"is {repeat} but the splits have {self.repeats[1]} repeats "
+                                           "(counted from 0)")
 
 
 def write_artifact(doc, path):
@@ -346,7 +364,7 @@ def write_artifact(doc, path):
     doc = _plain(doc, "artifact")
     issues = check_artifact(doc)
     if issues:
-        raise ArtifactError(issues)
+        raise ArtifactError(issues, _validate_note(path))
     text = json.dumps(doc, indent=2, allow_nan=False, ensure_ascii=False) + "\n"
     folder = os.path.dirname(os.path.abspath(path))
     os.makedirs(folder, exist_ok=True)
@@ -358,13 +376,13 @@ def write_artifact(doc, path):
 
 
 def value_from_examples(*, goal, kind, correct=None, loss=None, aggregate="mean", path="predictions"):
-    """The split value that per-example values give, by fitgap's rule.
+    """The split value that per-example values give, by fitgap's rule. Returns ``(value, n)``.
 
     Proportion metrics take ``correct`` (1 right, 0 wrong): a minimized metric is the error rate
     (share of ``correct == 0``), a maximized one the accuracy (share of ``correct == 1``).
     Continuous metrics take ``loss`` (lower is better per example) and a minimized metric:
     ``mean`` (MAE, log loss, squared error), ``rmse`` (root of the mean; ``loss`` then holds squared
-    errors) or ``sum``. Returns ``(value, n)``."""
+    errors) or ``sum``."""
     if kind == "proportion":
         if correct is None or loss is not None:
             _fail(path, "a proportion metric takes correct=[1 or 0 per example], not loss")
@@ -384,13 +402,14 @@ def value_from_examples(*, goal, kind, correct=None, loss=None, aggregate="mean"
         _fail(path, "per-example loss reproduces a minimized metric only (MAE, RMSE, log loss); "
                     "declare such a metric for the predictions, or leave them out")
     if aggregate not in AGGREGATES:
-        _fail(f"{path}.aggregate", f"must be one of {AGGREGATES} (got {aggregate!r})")
+        _fail(f"{path}.aggregate", f"must be one of {', '.join(AGGREGATES)} (got {aggregate!r})")
     values = _numbers(loss, f"{path}.loss")
     if not values:
         _fail(f"{path}.loss", "needs at least one example")
+    expected = "a finite number >= 0 (a squared error)" if aggregate == "rmse" else "a finite number"
     for i, v in enumerate(values):
         if not math.isfinite(v) or (aggregate == "rmse" and v < 0):
-            _fail(f"{path}.loss[{i}]", f"must be a finite number{' >= 0 (a squared error)' if aggregate == 'rmse' else ''} (got {v!r})")
+            _fail(f"{path}.loss[{i}]", f"must be {expected} (got {v!r})")
     total = math.fsum(values)
     n = len(values)
     return {"mean": total / n, "rmse": math.sqrt(total / n), "sum": total}[aggregate], n
@@ -414,25 +433,29 @@ class Run:
 
     def __init__(self, path, *, name, metric, goal, kind, best=None, unit=None, reference=None,
                  commit=None, created_at=None):
+        if goal not in ("minimize", "maximize"):
+            _fail("metric.goal", f"must be 'minimize' or 'maximize' (got {goal!r})")
+        if kind not in ("proportion", "continuous"):
+            _fail("metric.kind", f"must be 'proportion' or 'continuous' (got {kind!r})")
         self.path = os.fspath(path)
         run = {"name": name}
         if commit is not None:
             run["commit"] = commit
+        if isinstance(created_at, _dt.datetime):
+            if created_at.tzinfo is None:
+                _fail("run.createdAt", "give a timezone-aware datetime, e.g. datetime.now(timezone.utc)")
+            created_at = created_at.isoformat()
         if created_at is not None:
-            if isinstance(created_at, _dt.datetime):
-                if created_at.tzinfo is None:
-                    _fail("run.createdAt", "give a timezone-aware datetime (e.g. datetime.now(timezone.utc))")
-                created_at = created_at.isoformat()
             run["createdAt"] = created_at
-        self._doc = {"format": FORMAT, "run": run,
-                     "metric": {"name": metric, "goal": goal, "kind": kind}, "splits": {}}
+        metric = {"name": metric, "goal": goal, "kind": kind}
         if best is not None:
-            self._doc["metric"]["best"] = _number(best, "metric.best")
+            metric["best"] = _number(best, "metric.best")
         if unit is not None:
-            self._doc["metric"]["unit"] = unit
+            metric["unit"] = unit
+        self._doc = {"format": FORMAT, "run": run, "metric": metric, "splits": {}}
         if reference is not None:
             self.set_reference(reference)
-        self._predictions = None  # (split, repeat, value, n, tolerance, aggregate)
+        self._predictions = None  # _Predictions of the last write_predictions
 
     @property
     def kind(self):
@@ -452,14 +475,16 @@ class Run:
         """One value per repeat for split ``name`` (train, train_dev, validation, test).
         ``evaluation_rows``: ``"fixed"`` (every repeat scored the same rows, the default) or
         ``"per-repeat"`` (each seed drew its own rows)."""
+        at = f"splits.{name}"
         if name not in SPLIT_NAMES:
-            _fail(f"splits.{name}", f"is not a split name (use one of {', '.join(SPLIT_NAMES)})")
-        split = {"values": _numbers(values, f"splits.{name}.values")}
+            _fail(at, f"is not a split name (use one of {', '.join(SPLIT_NAMES)})")
+        split = {"values": _numbers(values, f"{at}.values")}
         if examples is not None:
-            split["examples"] = _count(examples, f"splits.{name}.examples")
+            split["examples"] = _count(examples, f"{at}.examples")
         if evaluation_rows is not None:
             if evaluation_rows not in EVALUATION_ROWS:
-                _fail(f"splits.{name}.evaluationRows", f"must be one of {EVALUATION_ROWS} (got {evaluation_rows!r})")
+                _fail(f"{at}.evaluationRows",
+                      f"must be one of {', '.join(EVALUATION_ROWS)} (got {evaluation_rows!r})")
             split["evaluationRows"] = evaluation_rows
         self._doc["splits"][name] = split
         return self
@@ -469,14 +494,16 @@ class Run:
         tuples (``hidden_layer_sizes``) become JSON numbers and lists. Knobs where smaller means
         stronger regularization (``C``, or names in ``inverse``) are listed under ``inverse_knobs``."""
         merged = dict(values or {}, **more)
-        target = self._doc.setdefault("hyperparameters", {})
-        target.update(_plain(merged, "hyperparameters"))
+        self._hyperparameters().update(_plain(merged, "hyperparameters"))
         self._mark_inverse([k for k in merged if _knob_name(k) in INVERSE_KNOBS] + list(inverse))
         return self
 
+    def _hyperparameters(self):
+        return self._doc.setdefault("hyperparameters", {})
+
     def _mark_inverse(self, keys):
         if keys:
-            target = self._doc.setdefault("hyperparameters", {})
+            target = self._hyperparameters()
             target[INVERSE_KNOBS_KEY] = sorted(set(target.get(INVERSE_KNOBS_KEY, [])) | set(keys))
 
     def add_slice(self, name, validation, *, train=None, examples=None):
@@ -500,19 +527,19 @@ class Run:
         left out. ``train_frame`` (same columns, training examples) adds each slice's train value."""
         column = column or ("correct" if self.kind == "proportion" else "loss")
         groups = _groups(frame, by, column, "frame")
-        train_groups = _groups(train_frame, by, column, "train_frame") if train_frame is not None else {}
+        train_groups = {} if train_frame is None else _groups(train_frame, by, column, "train_frame")
         for key in _sorted_keys(groups):
-            self.add_slice(str(key), self._from_examples(groups[key], aggregate, f"slice {key!r}"),
-                           train=(self._from_examples(train_groups[key], aggregate, f"slice {key!r} (train)")
-                                  if key in train_groups else None),
-                           examples=len(groups[key]))
+            train = train_groups.get(key)
+            self.add_slice(
+                str(key), self._from_examples(groups[key], aggregate, f"slice {key!r}"),
+                train=None if train is None else self._from_examples(train, aggregate, f"slice {key!r}"),
+                examples=len(groups[key]))
         return self
 
     def _from_examples(self, values, aggregate, path):
         key = "correct" if self.kind == "proportion" else "loss"
-        value, _ = value_from_examples(goal=self.goal, kind=self.kind, aggregate=aggregate, path=path,
-                                       **{key: values})
-        return value
+        return value_from_examples(goal=self.goal, kind=self.kind, aggregate=aggregate, path=path,
+                                   **{key: values})[0]
 
     def set_curve(self, name, x, validation, *, train=None, source="held-out", knob=None,
                   inverse=None):
@@ -521,29 +548,23 @@ class Run:
         inside the training set). ``knob``: the hyperparameter that x sweeps, in its own units
         (``C`` for a regularization curve over C); an inverse knob (``C`` or ``inverse=True``) is
         listed under ``inverse_knobs``."""
+        at = f"curves.{name}"
         if name not in CURVE_NAMES:
-            _fail(f"curves.{name}", f"is not a curve name (use one of {', '.join(CURVE_NAMES)})")
+            _fail(at, f"is not a curve name (use one of {', '.join(CURVE_NAMES)})")
         if source not in CURVE_SOURCES:
-            _fail(f"curves.sources.{name}", f"must be one of {CURVE_SOURCES} (got {source!r})")
-        xs = _numbers(x, f"curves.{name}.x")
-        columns = {"validation": _numbers(validation, f"curves.{name}.validation")}
-        if train is not None:
-            columns["train"] = _numbers(train, f"curves.{name}.train")
+            _fail(f"curves.sources.{name}", f"must be one of {', '.join(CURVE_SOURCES)} (got {source!r})")
+        xs = _numbers(x, f"{at}.x")
+        columns = {"train": train, "validation": validation}
+        columns = {k: _numbers(v, f"{at}.{k}") for k, v in columns.items() if v is not None}
         for key, values in columns.items():
             if len(values) != len(xs):
-                _fail(f"curves.{name}.{key}", f"has {len(values)} values for {len(xs)} x values")
-        points = []
-        for i, xi in enumerate(xs):
-            point = {"x": xi}
-            if "train" in columns:
-                point["train"] = columns["train"][i]
-            point["validation"] = columns["validation"][i]
-            points.append(point)
+                _fail(f"{at}.{key}", f"has {len(values)} values for {len(xs)} x values")
+        points = [dict({"x": xi}, **{k: v[i] for k, v in columns.items()}) for i, xi in enumerate(xs)]
         curves = self._doc.setdefault("curves", {})
         curves[name] = points
         curves.setdefault("sources", {})[name] = source
         if knob is not None:
-            self._doc.setdefault("hyperparameters", {}).setdefault(CURVE_KNOBS_KEY, {})[name] = str(knob)
+            self._hyperparameters().setdefault(CURVE_KNOBS_KEY, {})[name] = str(knob)
             if inverse or (inverse is None and _knob_name(knob) in INVERSE_KNOBS):
                 self._mark_inverse([str(knob)])
         return self
@@ -558,43 +579,38 @@ class Run:
         ``tolerance`` (default 1e-6 x max(1, |value|)). ``ids`` name the examples (unique, no commas,
         the same ids in baseline and candidate so that rows pair). Sets the split's ``examples``
         when it is missing."""
-        at = "predictions"
         target = self._doc["splits"].get(split)
         if target is None:
             _fail(f"splits.{split}", "must be set (set_split) before its predictions are written")
-        values = target["values"]
-        if isinstance(repeat, bool) or not isinstance(repeat, int) or not 0 <= repeat < len(values):
-            _fail(f"{at}.repeat", f"must be a position in splits.{split}.values (0 to {len(values) - 1}), got {repeat!r}")
-        if self.kind == "proportion" and aggregate is not None:
-            _fail(f"{at}.aggregate", "applies to a continuous metric's loss; leave it out for a proportion")
-        if self.kind == "proportion" and self.goal == "maximize" and self._doc["metric"].get("best", 1) != 1:
+        last = len(target["values"]) - 1
+        if isinstance(repeat, bool) or not isinstance(repeat, int) or not 0 <= repeat <= last:
+            _fail("predictions.repeat",
+                  f"must be a position in splits.{split}.values (0 to {last}), got {repeat!r}")
+        proportion = self.kind == "proportion"
+        if proportion and aggregate is not None:
+            _fail("predictions.aggregate", "applies to a continuous metric's loss; leave it out")
+        if proportion and self.goal == "maximize" and self._doc["metric"].get("best", 1) != 1:
             _fail("metric.best", "must be 1 for predictions of a maximized proportion (accuracy)")
-        if aggregate is None and self.kind == "continuous":
-            aggregate = "mean"
+        aggregate = None if proportion else aggregate or "mean"
         value, n = value_from_examples(goal=self.goal, kind=self.kind, correct=correct, loss=loss,
-                                       aggregate=aggregate or "mean", path=at)
-        rows = _id_strings(ids, at)
+                                       aggregate=aggregate or "mean")
+        rows = _id_strings(ids, "predictions")
         if len(rows) != n:
-            _fail(f"{at}.ids", f"has {len(rows)} ids for {n} per-example values")
+            _fail("predictions.ids", f"has {len(rows)} ids for {n} per-example values")
         if target.get("examples", n) != n:
             _fail(f"splits.{split}.examples", f"is {target['examples']} but the predictions have {n} rows")
         self._predictions = (split, repeat, value, n, tolerance, aggregate)
         self._check_predictions()
         target.setdefault("examples", n)
-        stem = os.path.splitext(os.path.basename(self.path))[0]
-        filename = filename or f"{stem}.{split}-predictions.csv"
-        if os.path.basename(filename) != filename or filename in ("", ".", ".."):
-            _fail(f"{at}.path", f"must be a plain file name next to the artifact (got {filename!r})")
+        filename = filename or f"{os.path.splitext(os.path.basename(self.path))[0]}.{split}-predictions.csv"
+        if os.path.basename(filename) != filename or filename in (".", ".."):
+            _fail("predictions.path", f"must be a plain file name next to the artifact (got {filename!r})")
         csv_path = os.path.join(os.path.dirname(os.path.abspath(self.path)), filename)
-        os.makedirs(os.path.dirname(csv_path), exist_ok=True)
-        per_example = _plain(correct if self.kind == "proportion" else loss, at)
-        per_example = per_example if isinstance(per_example, list) else [per_example]
-        with open(csv_path, "w", encoding="utf-8", newline="\n") as out:
-            out.write("id,correct\n" if self.kind == "proportion" else "id,loss\n")
-            for row_id, v in zip(rows, per_example):
-                out.write(f"{row_id},{int(v) if self.kind == 'proportion' else repr(float(v))}\n")
+        per_example = _plain(correct if proportion else loss, "predictions")
+        _write_csv(csv_path, "correct" if proportion else "loss", rows,
+                   [int(v) if proportion else float(v) for v in _as_list(per_example)])
         entry = {"split": split, "path": filename}
-        if self.kind == "continuous":
+        if aggregate is not None:
             entry["aggregate"] = aggregate
         entry["repeat"] = repeat
         self._doc["predictions"] = entry
@@ -605,21 +621,23 @@ class Run:
             return
         split, repeat, value, n, tolerance, aggregate = self._predictions
         values = self._doc["splits"].get(split, {}).get("values", [])
+        at = f"splits.{split}.values[{repeat}]"
         stated = values[repeat] if repeat < len(values) else None
         if not _is_num(stated) or not math.isfinite(stated):
-            _fail(f"splits.{split}.values[{repeat}]", f"must be a finite number (got {stated!r})")
+            _fail(at, f"must be a finite number for the predictions of repeat {repeat} (got {stated!r})")
         allowed = _tolerance(stated, tolerance)
         if abs(value - stated) <= allowed:
             return
-        rule = (("error rate" if self.goal == "minimize" else "accuracy") if aggregate is None
-                else f"{aggregate} of loss")
+        if aggregate is None:
+            rule = "error rate" if self.goal == "minimize" else "accuracy"
+        else:
+            rule = f"{aggregate} of loss"
         others = [i for i, v in enumerate(values) if i != repeat and _is_num(v)
                   and abs(value - v) <= _tolerance(v, tolerance)]
-        hint = (f" They match repeat {others[0]}: pass repeat={others[0]}." if others else
-                " Write the predictions of the model that produced that value.")
-        _fail(f"splits.{split}.values[{repeat}]",
-              f"is {stated!r} but the {n} per-example values give {value!r} ({rule}; tolerance "
-              f"{allowed:g}).{hint}")
+        hint = (f"They match repeat {others[0]}: pass repeat={others[0]}." if others
+                else "Write the predictions of the model that produced that value.")
+        _fail(at, f"is {stated!r} but the {n} per-example values give {value!r} ({rule}; "
+                  f"tolerance {allowed:g}). {hint}")
 
     def to_dict(self):
         """The artifact as a JSON-ready dict (a copy, keys in the schema's order; unchecked)."""
@@ -639,36 +657,53 @@ class Run:
         `ArtifactError` naming each failing field. ``npx fitgap validate PATH`` runs the rest."""
         issues = self.check()
         if issues:
-            raise ArtifactError(issues)
+            raise ArtifactError(issues, _validate_note(self.path))
         return write_artifact(self.to_dict(), self.path)
+
+
+def _validate_note(path):
+    return f"nothing written; once fixed, `npx fitgap validate {path}` runs the full schema"
 
 
 def _ordered(doc):
     """Keys in the order of the schema, so artifacts read alike and diff well."""
     out = {key: doc[key] for key in TOP_LEVEL_KEYS if key in doc}
-    for split in out.get("splits", {}).values():
+    splits = out.get("splits", {})
+    for split in splits.values():
         ordered = {key: split[key] for key in ("examples", "values", "evaluationRows") if key in split}
         split.clear()
         split.update(ordered)
     if "splits" in out:
-        out["splits"] = {key: out["splits"][key] for key in SPLIT_NAMES if key in out["splits"]}
-    if "curves" in out:
-        out["curves"] = {key: out["curves"][key] for key in CURVE_NAMES + ("sources",) if key in out["curves"]}
+        out["splits"] = {key: splits[key] for key in SPLIT_NAMES if key in splits}
+    curves = out.get("curves")
+    if curves is not None:
+        out["curves"] = {key: curves[key] for key in CURVE_NAMES + ("sources",) if key in curves}
     return out
 
 
+def _as_list(value):
+    return value if isinstance(value, list) else [value]
+
+
+def _write_csv(path, column, ids, values):
+    os.makedirs(os.path.dirname(path), exist_ok=True)
+    with open(path, "w", encoding="utf-8", newline="\n") as out:
+        out.write(f"id,{column}\n")
+        for row_id, v in zip(ids, values):
+            out.write(f"{row_id},{v!r}\n")
+
+
 def _id_strings(ids, path):
-    ids = _plain(ids, f"{path}.ids")
-    ids = ids if isinstance(ids, list) else [ids]
     out, seen = [], {}
-    for i, raw in enumerate(ids):
-        if isinstance(raw, (dict, list)) or raw is None or isinstance(raw, bool):
-            _fail(f"{path}.ids[{i}]", f"must be a string or a number (got {raw!r})")
+    for i, raw in enumerate(_as_list(_plain(ids, f"{path}.ids"))):
+        at = f"{path}.ids[{i}]"
+        if isinstance(raw, (dict, list, bool)) or raw is None:
+            _fail(at, f"must be a string or a number (got {raw!r})")
         text = str(raw)
         if not text or text != text.strip() or any(c in text for c in ",\r\n"):
-            _fail(f"{path}.ids[{i}]", f"must be non-empty, without commas, line breaks or surrounding spaces (got {text!r})")
+            _fail(at, f"must be non-empty, without commas, line breaks or surrounding spaces (got {text!r})")
         if text in seen:
-            _fail(f"{path}.ids[{i}]", f"repeats the id {text!r} (also at ids[{seen[text]}]); ids must be unique")
+            _fail(at, f"repeats the id {text!r} (also at ids[{seen[text]}]); ids must be unique")
         seen[text] = i
         out.append(text)
     return out
@@ -679,8 +714,7 @@ def _column(frame, name, where):
         column = frame[name]
     except (KeyError, IndexError, TypeError):
         _fail(where, f"has no column {name!r}")
-    column = _plain(column, f"{where}[{name!r}]")
-    return column if isinstance(column, list) else [column]
+    return _as_list(_plain(column, f"{where}[{name!r}]"))
 
 
 def _groups(frame, by, column, where):

@@ -6,7 +6,6 @@ import os
 import shutil
 import subprocess
 import sys
-import unittest
 
 HERE = os.path.dirname(os.path.abspath(__file__))
 PYTHON_DIR = os.path.dirname(HERE)
@@ -17,12 +16,16 @@ if PYTHON_DIR not in sys.path:
 
 
 def optional(module, test):
-    """Import an optional library, or skip ``test`` saying which one is missing and what it costs."""
+    """Import an optional library, or skip ``test`` saying which one is missing. With
+    FITGAP_REQUIRE_PYTHON_EXTRAS=1 (set it in CI once the libraries are installed) a missing library
+    fails the test instead."""
     try:
         return importlib.import_module(module)
     except ImportError as error:
         top = module.split(".")[0]
         pip = {"sklearn": "scikit-learn"}.get(top, top)
+        if os.environ.get("FITGAP_REQUIRE_PYTHON_EXTRAS") == "1":
+            test.fail(f"{pip} is required here (FITGAP_REQUIRE_PYTHON_EXTRAS=1) but missing: {error}")
         test.skipTest(f"{pip} not installed ({error}); install it to run this check "
                       f"(apt-get install python3-{top}, or pip install {pip})")
 

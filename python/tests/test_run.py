@@ -56,6 +56,7 @@ class BuilderTest(Temp):
             run.write()
         self.assertEqual(paths(caught.exception), ["splits.validation.values[2]"])
         self.assertIn("splits.validation.values[2]: must be a finite number", str(caught.exception))
+        self.assertIn(f"npx fitgap validate {run.path}", str(caught.exception))
         self.assertFalse(os.path.exists(run.path))
 
     def test_infinity_in_hyperparameters_is_named(self):
