@@ -41,7 +41,8 @@ AGGREGATES = ("mean", "rmse", "sum")
 EVALUATION_ROWS = ("fixed", "per-repeat")
 TOP_LEVEL_KEYS = ("$schema", "format", "run", "metric", "reference", "splits",
                   "hyperparameters", "curves", "slices", "predictions")
-#: Knobs where a smaller value means stronger regularization (scikit-learn's ``C``).
+#: Knobs where a smaller value means stronger regularization: scikit-learn's ``C`` ("inverse of
+#: regularization strength", LogisticRegression and SVC API reference).
 INVERSE_KNOBS = frozenset({"C"})
 #: Hyperparameter keys this module adds: the inverse knobs, and which knob each curve's x sweeps.
 INVERSE_KNOBS_KEY = "inverse_knobs"

@@ -176,7 +176,9 @@ class ScikitLearnTest(Temp):
         for p, q in zip(a, b):
             self.assertAlmostEqual(p["validation"], q["validation"], places=12)
             self.assertAlmostEqual(p["train"], q["train"], places=12)
-        self.assertGreater(a[0]["train"], a[-1]["train"])  # C = 0.001 underfits: the inverse knob
+        # Source: scikit-learn API reference, LogisticRegression: "C: Inverse of regularization
+        # strength ... smaller values specify stronger regularization". C = 0.001 underfits.
+        self.assertGreater(a[0]["train"], a[-1]["train"])
 
     def test_learning_curve_and_estimator_parameters(self):
         from sklearn.datasets import make_classification
