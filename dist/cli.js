@@ -19604,6 +19604,100 @@ var fitgap_run_1_schema_default = {
           description: "Which repeat (0-based position in `values`) the predictions belong to; default 0."
         }
       }
+    },
+    guardrails: {
+      type: "array",
+      maxItems: 50,
+      description: "Metrics that must not get worse by more than a margin (calibration error, a fairness gap, latency\u2026), reviewed beside the primary metric.",
+      items: {
+        type: "object",
+        required: ["metric", "splits"],
+        additionalProperties: false,
+        properties: {
+          metric: {
+            type: "object",
+            required: ["name", "goal", "kind"],
+            additionalProperties: false,
+            properties: {
+              name: {
+                type: "string",
+                minLength: 1,
+                maxLength: 100
+              },
+              goal: {
+                enum: ["minimize", "maximize"]
+              },
+              kind: {
+                enum: ["proportion", "continuous"]
+              },
+              best: {
+                type: "number",
+                description: "Best possible value of the metric: 1 for accuracy, AUC and R\xB2, 100 for a 0\u2013100 score, 0 for an error. The error level of a maximized metric is best \u2212 value."
+              },
+              unit: {
+                type: "string",
+                minLength: 1,
+                maxLength: 40,
+                description: `Unit of the metric's values, for labels (e.g. "ms", "BLEU"). Proportions need none.`
+              }
+            },
+            description: "The guardrail's metric; the same fields as the primary metric."
+          },
+          splits: {
+            type: "object",
+            required: ["validation"],
+            additionalProperties: false,
+            properties: {
+              validation: {
+                $ref: "#/$defs/split"
+              },
+              test: {
+                $ref: "#/$defs/split"
+              }
+            }
+          },
+          margin: {
+            type: "number",
+            minimum: 0,
+            description: "Non-inferiority margin in the metric's units: the largest worsening still acceptable. Without it (here or in the config) the guardrail is reported but never gates."
+          }
+        }
+      }
+    },
+    cost: {
+      type: "object",
+      additionalProperties: false,
+      description: "What the run cost. Per-repeat lists give ratios with intervals.",
+      properties: {
+        trainSeconds: {
+          type: "array",
+          minItems: 1,
+          items: {
+            type: "number",
+            exclusiveMinimum: 0
+          },
+          description: "Training wall-clock seconds, one per repeat."
+        },
+        inferenceMs: {
+          type: "array",
+          minItems: 1,
+          items: {
+            type: "number",
+            exclusiveMinimum: 0
+          },
+          description: "Inference latency in milliseconds, one per repeat."
+        },
+        parameters: {
+          type: "number",
+          exclusiveMinimum: 0,
+          description: "Number of trained parameters."
+        },
+        memoryMb: {
+          type: "number",
+          exclusiveMinimum: 0,
+          description: "Peak memory in megabytes."
+        }
+      }
     }
   },
   $defs: {
@@ -19756,6 +19850,47 @@ function nonFiniteNumbers(doc, pointer = "") {
   return [];
 }
 
+// src/validate/guardrails.ts
+function guardrailIssues(run, file) {
+  const issues = [];
+  const names = /* @__PURE__ */ new Map();
+  run.guardrails?.forEach((guardrail, g) => {
+    const at = `/guardrails/${g}`;
+    const first = names.get(guardrail.metric.name);
+    if (first !== void 0) {
+      issues.push({
+        file,
+        pointer: `${at}/metric/name`,
+        expected: `must be unique among the guardrails (also at /guardrails/${first}/metric/name)`,
+        got: quote(guardrail.metric.name)
+      });
+    } else names.set(guardrail.metric.name, g);
+    if (guardrail.metric.name === run.metric.name) {
+      issues.push({
+        file,
+        pointer: `${at}/metric/name`,
+        expected: "must differ from the primary metric",
+        got: quote(guardrail.metric.name),
+        hint: "The primary metric is reviewed already; a guardrail is another metric."
+      });
+    }
+    for (const [split, values] of Object.entries(guardrail.splits)) {
+      values.values.forEach((v, i) => {
+        if (guardrail.metric.kind === "proportion" && (v < 0 || v > 1)) {
+          issues.push({
+            file,
+            pointer: `${at}/splits/${split}/values/${i}`,
+            expected: "must be within [0, 1] for a proportion metric",
+            got: quote(v),
+            hint: 'Write rates as fractions (0.07, not 7), or declare metric.kind "continuous".'
+          });
+        }
+      });
+    }
+  });
+  return issues;
+}
+
 // src/model/run.ts
 var SPLIT_NAMES = ["train", "train_dev", "validation", "test"];
 var CURVE_NAMES = ["epochs", "training_examples", "regularization"];
@@ -19866,6 +20001,7 @@ function semanticIssues(run, file) {
       });
     }
   }
+  issues.push(...guardrailIssues(run, file));
   return issues;
 }
 function validateRun(doc, file) {
@@ -23847,7 +23983,8 @@ var package_default = {
     typecheck: "tsc --noEmit",
     lint: "eslint . && prettier --check . && npm run -s lint:layers",
     format: "prettier --write .",
-    test: "vitest run",
+    test: "vitest run && npm run -s test:python",
+    "test:python": "${PYTHON:-python3} -m unittest discover -s python/tests -v",
     demo: "npm run -s build && node dist/cli.js demo",
     bench: "node scripts/bench.mjs",
     "lint:layers": "depcruise src --config .dependency-cruiser.cjs"
