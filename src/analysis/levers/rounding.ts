@@ -46,9 +46,12 @@ function decade(v: number): number {
   return e;
 }
 
-/** k·10^e written so the result is the double nearest to the decimal (no 0.30000000000000004). */
+/**
+ * k·10^e as the double nearest to that decimal (no 0.30000000000000004): parsing the decimal is
+ * correctly rounded at every exponent, where k / 10^−e is only for |e| ≤ 22.
+ */
 function scaled(k: number, e: number): number {
-  return e >= 0 ? k * 10 ** e : k / 10 ** -e;
+  return Number(`${k}e${e}`);
 }
 
 /**
@@ -141,9 +144,12 @@ export function between(
 ): number | null {
   const lo = Math.min(a, b);
   const hi = Math.max(a, b);
+  // The open interval (lo, hi), so 1 → 1.05 gives 1.02 rather than 1.0 (an end).
+  const inset = (hi - lo) * 1e-9;
+  if (!(inset > 0)) return null;
   const v = roundSuggestion(midpoint(lo, hi, options.scale), {
     integer: options.integer,
-    range: [lo, hi],
+    range: [lo + inset, hi - inset],
     ...(options.grid === undefined ? {} : { grid: options.grid }),
   });
   return v > lo && v < hi ? v : null;
