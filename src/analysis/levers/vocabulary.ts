@@ -148,7 +148,7 @@ export const VOCABULARY: readonly VocabularyGroup[] = [
   },
   // Inverse regularization: lower = stronger.
   {
-    names: ['c'],
+    names: ['C'],
     role: 'regularization',
     inverse: true,
     domain: 'positive',
