@@ -12,10 +12,12 @@
  * - A layer-size array (domain `units`, e.g. `hidden_layer_sizes`) compares by its total units:
  *   widening a layer or adding one raises it; `[100]` → `[50, 50]` is `changed` with equal size.
  * - A "no limit" value (`max_depth: null`; LightGBM's `max_depth: -1`) is larger than any number.
+ * - A count-or-fraction knob moved between its two forms (`min_samples_leaf` 5 → 0.05) is `changed`:
+ *   a fraction of an unknown total does not compare with a count.
  * - Anything else compares as canonical JSON: `changed` when it differs.
  */
 import type { HyperparameterRole } from './roles.js';
-import { BUILT_IN_VOCABULARY, resolveKnob, type Vocabulary } from './vocabulary.js';
+import { BUILT_IN_VOCABULARY, resolveKnob, type Vocabulary } from './resolve-knob.js';
 
 export type JsonValue =
   null | boolean | number | string | JsonValue[] | { [key: string]: JsonValue };
@@ -250,6 +252,9 @@ function change(
   const mc = measure(c, resolution);
   if (mb === null || mc === null)
     return canonical(b) === canonical(c) ? null : direction('changed');
+  // A count and a fraction of a total (min_samples_leaf 5 vs 0.05) do not compare by size.
+  if (known && resolution.spec.domain === 'count-or-fraction' && mb.value < 1 !== mc.value < 1)
+    return direction('changed');
   if (mb.value === mc.value) {
     // Same size, other shape ([100] → [50, 50]) is a change; "1e-3" → 0.001 or null → -1 for a
     // "no limit" knob is the same value written another way.

@@ -3,26 +3,15 @@
  * common names of scikit-learn, the gradient-boosting libraries (XGBoost, LightGBM, CatBoost) and
  * deep-learning trainers. Where a name means different things in different libraries, the
  * scikit-learn meaning is chosen and the other reading is written in `caveat`; where the readings
- * pull in opposite directions the name is listed as ambiguous and resolves to no role, so the
- * review asks for a config mapping instead of guessing.
- *
- * Matching (see `normaliseName`): case-insensitive; `-` and `_` alike; camelCase split at its
- * humps (`learningRate` = `learning_rate`); a path (`model.C`, `optimizer/lr`, scikit-learn's
- * pipeline `clf__C`) is looked up whole first, then by its last segment. The config's
- * `hyperparameters` map overrides any built-in name (`mergeRoles`).
+ * pull in opposite directions the name is listed in `AMBIGUOUS` and resolves to no role, so the
+ * review asks for a config mapping instead of guessing. Lookup and the config overlay live in
+ * ./resolve-knob.ts; the README table is generated from here (scripts/vocabulary-table.mjs).
  *
  * `source` names where each direction is written: scikit-learn entries are checked against the
  * library's own parameter constraints and docstrings (test/fixtures/levers/sklearn-parameters.json);
- * the rest are marked "common practice". Pure data and pure functions.
+ * the rest are marked "common practice". Names are written as they match, up to case. Pure data.
  */
-import type {
-  HyperparameterRole,
-  HyperparameterRolesConfig,
-  KnobScale,
-  KnobSpec,
-  UnlimitedWhen,
-  ValueDomain,
-} from './roles.js';
+import type { HyperparameterRole, KnobScale, UnlimitedWhen, ValueDomain } from './roles.js';
 
 /** A group of names sharing one meaning. */
 export interface VocabularyGroup {
@@ -44,13 +33,16 @@ export interface AmbiguousGroup {
   source: string;
 }
 
+/** A name list written as one line of words. */
+const words = (list: string): readonly string[] => list.split(/\s+/).filter((w) => w !== '');
+
 const SKLEARN = 'scikit-learn';
 const COMMON = 'common practice';
 
 export const VOCABULARY: readonly VocabularyGroup[] = [
   // Regularization: higher = stronger.
   {
-    names: ['alpha'],
+    names: words('alpha'),
     role: 'regularization',
     inverse: false,
     domain: 'non-negative',
@@ -59,17 +51,9 @@ export const VOCABULARY: readonly VocabularyGroup[] = [
     caveat: 'some texts and optimisers use alpha for a learning rate or a smoothing constant',
   },
   {
-    names: [
-      'lambda',
-      'reg_lambda',
-      'lambda_l2',
-      'l2',
-      'l2_penalty',
-      'l2_reg',
-      'l2_regularization',
-      'l2_leaf_reg',
-      'ridge_alpha',
-    ],
+    names: words(
+      'lambda reg_lambda lambda_l2 l2 l2_penalty l2_reg l2_regularization l2_leaf_reg ridge_alpha',
+    ),
     role: 'regularization',
     inverse: false,
     domain: 'non-negative',
@@ -77,7 +61,7 @@ export const VOCABULARY: readonly VocabularyGroup[] = [
     source: `${SKLEARN} HistGradientBoosting (l2_regularization); XGBoost, LightGBM, CatBoost L2 terms; ${COMMON} (lambda)`,
   },
   {
-    names: ['reg_alpha', 'lambda_l1', 'l1', 'l1_penalty', 'l1_reg'],
+    names: words('reg_alpha lambda_l1 l1 l1_penalty l1_reg'),
     role: 'regularization',
     inverse: false,
     domain: 'non-negative',
@@ -85,7 +69,7 @@ export const VOCABULARY: readonly VocabularyGroup[] = [
     source: `XGBoost, LightGBM L1 terms; ${COMMON}`,
   },
   {
-    names: ['reg', 'regularization', 'reg_strength', 'regularization_strength', 'penalty_strength'],
+    names: words('reg regularization reg_strength regularization_strength penalty_strength'),
     role: 'regularization',
     inverse: false,
     domain: 'non-negative',
@@ -93,7 +77,7 @@ export const VOCABULARY: readonly VocabularyGroup[] = [
     source: COMMON,
   },
   {
-    names: ['weight_decay'],
+    names: words('weight_decay'),
     role: 'regularization',
     inverse: false,
     domain: 'non-negative',
@@ -101,7 +85,7 @@ export const VOCABULARY: readonly VocabularyGroup[] = [
     source: `${COMMON} (PyTorch and Keras optimisers)`,
   },
   {
-    names: ['ccp_alpha', 'min_impurity_decrease'],
+    names: words('ccp_alpha min_impurity_decrease'),
     role: 'regularization',
     inverse: false,
     domain: 'non-negative',
@@ -109,13 +93,9 @@ export const VOCABULARY: readonly VocabularyGroup[] = [
     source: `${SKLEARN} decision trees and forests (pruning and split thresholds)`,
   },
   {
-    names: [
-      'min_child_weight',
-      'min_sum_hessian_in_leaf',
-      'min_split_loss',
-      'min_split_gain',
-      'min_gain_to_split',
-    ],
+    names: words(
+      'min_child_weight min_sum_hessian_in_leaf min_split_loss min_split_gain min_gain_to_split',
+    ),
     role: 'regularization',
     inverse: false,
     domain: 'non-negative',
@@ -123,7 +103,7 @@ export const VOCABULARY: readonly VocabularyGroup[] = [
     source: `XGBoost, LightGBM ("larger is more conservative"); ${COMMON}`,
   },
   {
-    names: ['min_samples_leaf', 'min_samples_split'],
+    names: words('min_samples_leaf min_samples_split'),
     role: 'regularization',
     inverse: false,
     domain: 'count-or-fraction',
@@ -131,7 +111,7 @@ export const VOCABULARY: readonly VocabularyGroup[] = [
     source: `${SKLEARN} decision trees, forests, gradient boosting`,
   },
   {
-    names: ['min_child_samples', 'min_data_in_leaf'],
+    names: words('min_child_samples min_data_in_leaf'),
     role: 'regularization',
     inverse: false,
     domain: 'count',
@@ -139,7 +119,7 @@ export const VOCABULARY: readonly VocabularyGroup[] = [
     source: `LightGBM; ${COMMON}`,
   },
   {
-    names: ['dropout', 'dropout_rate', 'label_smoothing'],
+    names: words('dropout dropout_rate label_smoothing'),
     role: 'regularization',
     inverse: false,
     domain: 'fraction',
@@ -148,7 +128,7 @@ export const VOCABULARY: readonly VocabularyGroup[] = [
   },
   // Inverse regularization: lower = stronger.
   {
-    names: ['C'],
+    names: words('C'),
     role: 'regularization',
     inverse: true,
     domain: 'positive',
@@ -156,14 +136,9 @@ export const VOCABULARY: readonly VocabularyGroup[] = [
     source: `${SKLEARN} LogisticRegression, SVC, LinearSVC: "Inverse of regularization strength"`,
   },
   {
-    names: [
-      'subsample',
-      'bagging_fraction',
-      'colsample_bytree',
-      'colsample_bylevel',
-      'colsample_bynode',
-      'feature_fraction',
-    ],
+    names: words(
+      'subsample bagging_fraction colsample_bytree colsample_bylevel colsample_bynode feature_fraction',
+    ),
     role: 'regularization',
     inverse: true,
     domain: 'fraction',
@@ -172,7 +147,7 @@ export const VOCABULARY: readonly VocabularyGroup[] = [
   },
   // Capacity: higher = more.
   {
-    names: ['max_depth', 'max_leaves'],
+    names: words('max_depth max_leaves'),
     role: 'capacity',
     inverse: false,
     domain: 'count',
@@ -181,7 +156,7 @@ export const VOCABULARY: readonly VocabularyGroup[] = [
     source: `${SKLEARN} trees (None = unlimited); XGBoost, LightGBM (0 or below = no limit)`,
   },
   {
-    names: ['max_leaf_nodes'],
+    names: words('max_leaf_nodes'),
     role: 'capacity',
     inverse: false,
     domain: 'count',
@@ -190,7 +165,7 @@ export const VOCABULARY: readonly VocabularyGroup[] = [
     source: `${SKLEARN} trees, HistGradientBoosting (None = unlimited)`,
   },
   {
-    names: ['num_leaves', 'depth'],
+    names: words('num_leaves depth'),
     role: 'capacity',
     inverse: false,
     domain: 'count',
@@ -198,7 +173,7 @@ export const VOCABULARY: readonly VocabularyGroup[] = [
     source: `LightGBM (num_leaves), CatBoost (depth); ${COMMON}`,
   },
   {
-    names: ['n_estimators', 'num_boost_round', 'num_iterations', 'num_round', 'nrounds'],
+    names: words('n_estimators num_boost_round num_iterations num_round nrounds'),
     role: 'capacity',
     inverse: false,
     domain: 'count',
@@ -208,7 +183,7 @@ export const VOCABULARY: readonly VocabularyGroup[] = [
       'in bagging ensembles (random forests) more trees mostly average variance away and do not overfit: map it as inert there',
   },
   {
-    names: ['hidden_layer_sizes', 'layers', 'hidden_layers', 'layer_sizes'],
+    names: words('hidden_layer_sizes layers hidden_layers layer_sizes'),
     role: 'capacity',
     inverse: false,
     domain: 'units',
@@ -217,23 +192,9 @@ export const VOCABULARY: readonly VocabularyGroup[] = [
     caveat: 'an array is compared by its total units; a single number by itself',
   },
   {
-    names: [
-      'n_layers',
-      'num_layers',
-      'hidden_units',
-      'hidden_size',
-      'hidden_dim',
-      'units',
-      'n_units',
-      'num_units',
-      'width',
-      'd_model',
-      'model_size',
-      'params',
-      'parameters',
-      'n_params',
-      'num_params',
-    ],
+    names: words(
+      'n_layers num_layers hidden_units hidden_size hidden_dim units n_units num_units width d_model model_size params parameters n_params num_params',
+    ),
     role: 'capacity',
     inverse: false,
     domain: 'count',
@@ -241,7 +202,7 @@ export const VOCABULARY: readonly VocabularyGroup[] = [
     source: COMMON,
   },
   {
-    names: ['n_neighbors'],
+    names: words('n_neighbors'),
     role: 'capacity',
     inverse: true,
     domain: 'count',
@@ -250,7 +211,7 @@ export const VOCABULARY: readonly VocabularyGroup[] = [
   },
   // Features and polynomial degree.
   {
-    names: ['features', 'n_features', 'num_features', 'feature_count'],
+    names: words('features n_features num_features feature_count'),
     role: 'features',
     inverse: false,
     domain: 'count',
@@ -258,7 +219,7 @@ export const VOCABULARY: readonly VocabularyGroup[] = [
     source: COMMON,
   },
   {
-    names: ['n_features_to_select'],
+    names: words('n_features_to_select'),
     role: 'features',
     inverse: false,
     domain: 'count-or-fraction',
@@ -266,7 +227,7 @@ export const VOCABULARY: readonly VocabularyGroup[] = [
     source: `${SKLEARN} RFE`,
   },
   {
-    names: ['degree', 'polynomial_degree', 'poly_degree'],
+    names: words('degree polynomial_degree poly_degree'),
     role: 'polynomial-degree',
     inverse: false,
     domain: 'count',
@@ -275,17 +236,9 @@ export const VOCABULARY: readonly VocabularyGroup[] = [
   },
   // Data size.
   {
-    names: [
-      'train_examples',
-      'training_examples',
-      'n_train',
-      'num_train',
-      'train_samples',
-      'n_samples',
-      'num_samples',
-      'dataset_size',
-      'data_size',
-    ],
+    names: words(
+      'train_examples training_examples n_train num_train train_samples n_samples num_samples dataset_size data_size',
+    ),
     role: 'data-size',
     inverse: false,
     domain: 'count',
@@ -293,7 +246,7 @@ export const VOCABULARY: readonly VocabularyGroup[] = [
     source: COMMON,
   },
   {
-    names: ['train_size'],
+    names: words('train_size'),
     role: 'data-size',
     inverse: false,
     domain: 'count-or-fraction',
@@ -301,7 +254,7 @@ export const VOCABULARY: readonly VocabularyGroup[] = [
     source: `${SKLEARN} train_test_split (an int is a count, a float a fraction)`,
   },
   {
-    names: ['train_fraction'],
+    names: words('train_fraction'),
     role: 'data-size',
     inverse: false,
     domain: 'fraction',
@@ -310,27 +263,19 @@ export const VOCABULARY: readonly VocabularyGroup[] = [
   },
   // Training length.
   {
-    names: [
-      'epochs',
-      'num_epochs',
-      'n_epochs',
-      'max_epochs',
-      'steps',
-      'max_steps',
-      'num_steps',
-      'train_steps',
-      'iterations',
-      'n_iter',
-    ],
+    names: words(
+      'epochs num_epochs n_epochs max_epochs steps max_steps num_steps train_steps iterations n_iter',
+    ),
     role: 'epochs',
     inverse: false,
     domain: 'count',
     scale: 'linear',
     source: COMMON,
-    caveat: "CatBoost's iterations counts trees (capacity); both mean more fitting",
+    caveat:
+      "CatBoost's iterations counts trees (capacity); both mean more fitting. A scikit-learn Pipeline's steps is a list of estimators, compared as text",
   },
   {
-    names: ['max_iter'],
+    names: words('max_iter'),
     role: 'epochs',
     inverse: false,
     domain: 'count',
@@ -340,7 +285,7 @@ export const VOCABULARY: readonly VocabularyGroup[] = [
       'in HistGradientBoosting it counts trees (capacity); for a convex solver that converged it changes nothing',
   },
   {
-    names: ['tol'],
+    names: words('tol'),
     role: 'epochs',
     inverse: true,
     domain: 'non-negative',
@@ -348,14 +293,9 @@ export const VOCABULARY: readonly VocabularyGroup[] = [
     source: `${SKLEARN} solvers ("tolerance for stopping criteria"); ${COMMON} (a smaller tolerance trains longer)`,
   },
   {
-    names: [
-      'patience',
-      'early_stopping_patience',
-      'early_stopping_rounds',
-      'early_stopping_round',
-      'n_iter_no_change',
-      'stopping_rounds',
-    ],
+    names: words(
+      'patience early_stopping_patience early_stopping_rounds early_stopping_round n_iter_no_change stopping_rounds',
+    ),
     role: 'early-stopping-patience',
     inverse: false,
     domain: 'count',
@@ -364,7 +304,7 @@ export const VOCABULARY: readonly VocabularyGroup[] = [
   },
   // Step size.
   {
-    names: ['learning_rate', 'learning_rate_init', 'lr', 'eta', 'base_lr', 'max_lr'],
+    names: words('learning_rate learning_rate_init lr eta base_lr max_lr'),
     role: 'learning-rate',
     inverse: false,
     domain: 'positive',
@@ -374,16 +314,7 @@ export const VOCABULARY: readonly VocabularyGroup[] = [
   },
   // Known and not a bias/variance knob.
   {
-    names: [
-      'random_state',
-      'seed',
-      'random_seed',
-      'n_jobs',
-      'nthread',
-      'num_threads',
-      'verbose',
-      'verbosity',
-    ],
+    names: words('random_state seed random_seed n_jobs nthread num_threads verbose verbosity'),
     role: 'inert',
     inverse: false,
     domain: 'count',
@@ -394,7 +325,7 @@ export const VOCABULARY: readonly VocabularyGroup[] = [
 
 export const AMBIGUOUS: readonly AmbiguousGroup[] = [
   {
-    names: ['gamma'],
+    names: words('gamma'),
     readings: [
       'scikit-learn SVC: RBF kernel coefficient, higher = more capacity',
       'XGBoost: minimum split loss, higher = stronger regularization',
@@ -402,7 +333,7 @@ export const AMBIGUOUS: readonly AmbiguousGroup[] = [
     source: `${SKLEARN} SVC; XGBoost`,
   },
   {
-    names: ['max_features'],
+    names: words('max_features'),
     readings: [
       'scikit-learn trees and forests: features sampled per split, lower = stronger regularization',
       'CountVectorizer, SelectFromModel: how many features the model gets',
@@ -410,7 +341,7 @@ export const AMBIGUOUS: readonly AmbiguousGroup[] = [
     source: SKLEARN,
   },
   {
-    names: ['max_samples'],
+    names: words('max_samples'),
     readings: [
       'scikit-learn forests and bagging: bootstrap sample per tree, lower = more randomisation',
       'not the size of the training set',
@@ -418,135 +349,18 @@ export const AMBIGUOUS: readonly AmbiguousGroup[] = [
     source: SKLEARN,
   },
   {
-    names: ['n_components'],
+    names: words('n_components'),
     readings: ['PCA: features kept', 'GaussianMixture: mixture components (capacity)'],
     source: SKLEARN,
   },
   {
-    names: ['rate', 'decay'],
+    names: words('rate decay'),
     readings: ['dropout rate or weight decay (regularization)', 'learning rate or its decay'],
     source: COMMON,
   },
   {
-    names: ['epsilon', 'eps'],
+    names: words('epsilon eps'),
     readings: ['SVR: tube width, higher = less capacity', 'optimisers: a numerical constant'],
     source: COMMON,
   },
 ];
-
-/**
- * The comparable form of a name: camelCase humps become `_`, lower case, `-` becomes `_`.
- * Path separators (`.`, `/`, `__`) are kept for `lastSegment`.
- */
-export function normaliseName(name: string): string {
-  return name
-    .replace(/([a-z0-9])([A-Z])/g, '$1_$2')
-    .toLowerCase()
-    .replace(/-/g, '_');
-}
-
-/** The last segment of a normalised path (`model.c` → `c`, `clf__c` → `c`), or null without one. */
-export function lastSegment(normalised: string): string | null {
-  const parts = normalised.split(/\.|\/|__/).filter((p) => p !== '');
-  const last = parts[parts.length - 1];
-  return parts.length > 1 && last !== undefined ? last : null;
-}
-
-export type KnobOrigin = 'built-in' | 'config';
-
-export type VocabularyItem =
-  | { kind: 'knob'; origin: KnobOrigin; spec: KnobSpec }
-  | { kind: 'ambiguous'; readings: readonly string[] };
-
-/** Normalised name → meaning. Built by `builtInVocabulary` and `mergeRoles`. */
-export type Vocabulary = ReadonlyMap<string, VocabularyItem>;
-
-function specOf(group: VocabularyGroup): KnobSpec {
-  return {
-    role: group.role,
-    inverse: group.inverse,
-    domain: group.domain,
-    scale: group.scale,
-    ...(group.unlimited === undefined ? {} : { unlimited: group.unlimited }),
-  };
-}
-
-export function builtInVocabulary(): Vocabulary {
-  const map = new Map<string, VocabularyItem>();
-  for (const group of VOCABULARY)
-    for (const name of group.names)
-      map.set(normaliseName(name), { kind: 'knob', origin: 'built-in', spec: specOf(group) });
-  for (const group of AMBIGUOUS)
-    for (const name of group.names)
-      map.set(normaliseName(name), { kind: 'ambiguous', readings: group.readings });
-  return map;
-}
-
-export const BUILT_IN_VOCABULARY: Vocabulary = builtInVocabulary();
-
-const COUNT_ROLES: ReadonlySet<HyperparameterRole> = new Set([
-  'capacity',
-  'features',
-  'polynomial-degree',
-  'data-size',
-  'epochs',
-  'early-stopping-patience',
-]);
-
-/** The knob a config entry describes, with the defaults documented on `HyperparameterRoleConfig`. */
-export function specFromConfig(entry: HyperparameterRolesConfig[string]): KnobSpec {
-  const integer = entry.integer ?? COUNT_ROLES.has(entry.role);
-  return {
-    role: entry.role,
-    inverse: entry.inverse ?? false,
-    domain: integer ? 'count' : 'non-negative',
-    scale: entry.scale ?? (integer ? 'linear' : 'log'),
-  };
-}
-
-/**
- * Config keys that normalise to the same name (`C` and `c`): the config loader should reject them,
- * since only the last of each group takes effect in `mergeRoles`.
- */
-export function configRoleConflicts(config: HyperparameterRolesConfig): string[][] {
-  const groups = new Map<string, string[]>();
-  for (const key of Object.keys(config)) {
-    const n = normaliseName(key);
-    groups.set(n, [...(groups.get(n) ?? []), key]);
-  }
-  return [...groups.values()].filter((g) => g.length > 1);
-}
-
-/** The config's roles laid over a vocabulary: a config name replaces a built-in one. */
-export function mergeRoles(
-  base: Vocabulary,
-  config: HyperparameterRolesConfig | undefined,
-): Vocabulary {
-  if (config === undefined) return base;
-  const map = new Map(base);
-  for (const [key, entry] of Object.entries(config))
-    map.set(normaliseName(key), { kind: 'knob', origin: 'config', spec: specFromConfig(entry) });
-  return map;
-}
-
-export type KnobResolution =
-  | { status: KnobOrigin; matched: string; spec: KnobSpec }
-  | { status: 'ambiguous'; matched: string; readings: readonly string[] }
-  | { status: 'unknown' };
-
-/** What a hyperparameter name means: the whole normalised name first, then its last segment. */
-export function resolveKnob(
-  name: string,
-  vocabulary: Vocabulary = BUILT_IN_VOCABULARY,
-): KnobResolution {
-  const whole = normaliseName(name);
-  for (const candidate of [whole, lastSegment(whole)]) {
-    if (candidate === null) continue;
-    const item = vocabulary.get(candidate);
-    if (item === undefined) continue;
-    return item.kind === 'knob'
-      ? { status: item.origin, matched: candidate, spec: item.spec }
-      : { status: 'ambiguous', matched: candidate, readings: item.readings };
-  }
-  return { status: 'unknown' };
-}

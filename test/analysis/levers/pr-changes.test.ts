@@ -6,7 +6,7 @@ import {
   pullOf,
   type PrChange,
 } from '../../../src/analysis/levers/pr-changes.js';
-import { BUILT_IN_VOCABULARY, mergeRoles } from '../../../src/analysis/levers/vocabulary.js';
+import { BUILT_IN_VOCABULARY, mergeRoles } from '../../../src/analysis/levers/resolve-knob.js';
 
 function only(changes: PrChange[]): PrChange {
   expect(changes).toHaveLength(1);
@@ -116,6 +116,16 @@ describe('prChanges: layer sizes, no-limit values, text', () => {
     expect(only(prChanges({ max_leaf_nodes: 31 }, { max_leaf_nodes: null }))).toMatchObject({
       direction: 'raised',
       unlimited: 'to',
+    });
+  });
+
+  it('does not compare a count with a fraction of a total', () => {
+    expect(only(prChanges({ min_samples_leaf: 5 }, { min_samples_leaf: 0.05 }))).toMatchObject({
+      direction: 'changed',
+      effect: null,
+    });
+    expect(only(prChanges({ train_size: 0.5 }, { train_size: 0.8 }))).toMatchObject({
+      direction: 'raised',
     });
   });
 

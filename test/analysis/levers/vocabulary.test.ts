@@ -1,16 +1,15 @@
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import {
-  AMBIGUOUS,
   BUILT_IN_VOCABULARY,
-  VOCABULARY,
   configRoleConflicts,
   lastSegment,
   mergeRoles,
   normaliseName,
   resolveKnob,
   specFromConfig,
-} from '../../../src/analysis/levers/vocabulary.js';
+} from '../../../src/analysis/levers/resolve-knob.js';
+import { AMBIGUOUS, VOCABULARY } from '../../../src/analysis/levers/vocabulary.js';
 import type { KnobSpec, ValueDomain } from '../../../src/analysis/levers/roles.js';
 
 interface Constraint {
