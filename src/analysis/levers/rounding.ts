@@ -108,6 +108,8 @@ export function roundSuggestion(x: number, options: RoundingOptions = {}): numbe
   if (!Number.isFinite(x)) throw new RangeError(`cannot round ${String(x)}: not a finite number`);
   const integer = options.integer ?? false;
   const [a, b] = options.range ?? [-Infinity, Infinity];
+  if (Number.isNaN(a) || Number.isNaN(b))
+    throw new RangeError('cannot round into a range with NaN');
   const lo = Math.min(a, b);
   const hi = Math.max(a, b);
   const x0 = Math.min(hi, Math.max(lo, x));

@@ -183,17 +183,18 @@ export const VOCABULARY: readonly VocabularyGroup[] = [
       'in bagging ensembles (random forests) more trees mostly average variance away and do not overfit: map it as inert there',
   },
   {
-    names: words('hidden_layer_sizes layers hidden_layers layer_sizes'),
+    names: words('hidden_layer_sizes layer_sizes'),
     role: 'capacity',
     inverse: false,
     domain: 'units',
     scale: 'linear',
     source: `${SKLEARN} MLPClassifier, MLPRegressor ("number of neurons in the ith hidden layer")`,
-    caveat: 'an array is compared by its total units; a single number by itself',
+    caveat:
+      'an array is compared by its total units, a single number as one layer of that many units (scikit-learn accepts both)',
   },
   {
     names: words(
-      'n_layers num_layers hidden_units hidden_size hidden_dim units n_units num_units width d_model model_size params parameters n_params num_params',
+      'n_layers num_layers layers hidden_layers hidden_units hidden_size hidden_dim units n_units num_units width d_model model_size params parameters n_params num_params',
     ),
     role: 'capacity',
     inverse: false,

@@ -46,6 +46,7 @@ describe('roundSuggestion: examples', () => {
   it('rejects a non-finite value', () => {
     expect(() => roundSuggestion(NaN)).toThrow(RangeError);
     expect(() => roundSuggestion(Infinity)).toThrow(RangeError);
+    expect(() => roundSuggestion(1, { range: [0, NaN] })).toThrow(RangeError);
   });
 });
 
