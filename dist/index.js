@@ -50462,6 +50462,51 @@ var fitgap_config_schema_default = {
           description: "Column holding the validation metric."
         }
       }
+    },
+    hyperparameters: {
+      type: "object",
+      description: "Roles of hyperparameter names fitgap does not know, or knows differently: each name maps to a role and whether raising it lowers that role (`inverse`, as scikit-learn's C). Names match case-insensitively with '-' and '_' alike; a dotted or `__` path also matches by its last segment. Overrides the built-in vocabulary (README 'Hyperparameter vocabulary').",
+      maxProperties: 200,
+      propertyNames: {
+        type: "string",
+        minLength: 1,
+        maxLength: 200
+      },
+      additionalProperties: {
+        type: "object",
+        required: ["role"],
+        additionalProperties: false,
+        properties: {
+          role: {
+            type: "string",
+            enum: [
+              "regularization",
+              "capacity",
+              "features",
+              "polynomial-degree",
+              "data-size",
+              "epochs",
+              "early-stopping-patience",
+              "learning-rate",
+              "inert"
+            ],
+            description: "What the knob controls."
+          },
+          inverse: {
+            type: "boolean",
+            description: "Raising the value lowers the role (a smaller C is stronger regularization). Default false."
+          },
+          integer: {
+            type: "boolean",
+            description: "The knob takes integers (suggestions are rounded to integers). Default: true for capacity, features, polynomial-degree, data-size, epochs and early-stopping-patience."
+          },
+          scale: {
+            type: "string",
+            enum: ["log", "linear"],
+            description: "How the knob is tuned: `log` (by factors; geometric midpoints) or `linear` (by steps). Default: linear for integers, log otherwise."
+          }
+        }
+      }
     }
   }
 };

@@ -16,7 +16,7 @@
  *   a fraction of an unknown total does not compare with a count.
  * - Anything else compares as canonical JSON: `changed` when it differs.
  */
-import type { HyperparameterRole } from './roles.js';
+import type { HyperparameterRole } from '../../model/hyperparameter-roles.js';
 import { BUILT_IN_VOCABULARY, resolveKnob, type Vocabulary } from './resolve-knob.js';
 
 export type JsonValue =

@@ -9,7 +9,7 @@
  * value); then, if a grid value in the range rounds to the same two digits, return that grid value
  * itself. Integer knobs choose among integers only. Rounding twice changes nothing.
  */
-import type { KnobScale, KnobSpec } from './roles.js';
+import type { KnobScale, KnobSpec } from '../../model/hyperparameter-roles.js';
 
 /** Significant digits of a suggestion (common practice: what a person types into a config). */
 export const SUGGESTION_DIGITS = 2;

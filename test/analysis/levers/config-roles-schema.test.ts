@@ -6,7 +6,7 @@ import {
   HYPERPARAMETER_ROLES_SCHEMA,
   MAX_CONFIG_ROLES,
   type HyperparameterRolesConfig,
-} from '../../../src/analysis/levers/roles.js';
+} from '../../../src/model/hyperparameter-roles.js';
 
 const schema = JSON.parse(
   readFileSync(new URL('../../../schema/fitgap-config.schema.json', import.meta.url), 'utf8'),

@@ -8,9 +8,9 @@
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { prChanges, type ChangeEffect } from '../../../src/analysis/levers/pr-changes.js';
-import type { HyperparameterRolesConfig } from '../../../src/analysis/levers/roles.js';
+import type { HyperparameterRolesConfig } from '../../../src/model/hyperparameter-roles.js';
 import { BUILT_IN_VOCABULARY, mergeRoles } from '../../../src/analysis/levers/resolve-knob.js';
-import type { Diagnosis, LeverId, Movement } from '../../../src/analysis/types.js';
+import type { Diagnosis, LeverId, Movement } from '../../../src/model/review.js';
 
 interface FixtureCase {
   name: string;

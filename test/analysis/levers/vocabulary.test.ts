@@ -10,7 +10,7 @@ import {
   specFromConfig,
 } from '../../../src/analysis/levers/resolve-knob.js';
 import { AMBIGUOUS, VOCABULARY } from '../../../src/analysis/levers/vocabulary.js';
-import type { KnobSpec, ValueDomain } from '../../../src/analysis/levers/roles.js';
+import type { KnobSpec, ValueDomain } from '../../../src/model/hyperparameter-roles.js';
 
 interface Constraint {
   kind: string;
