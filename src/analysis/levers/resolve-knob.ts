@@ -6,7 +6,11 @@
  * (`learningRate` = `learning_rate`); a path (`model.C`, `optimizer/lr`, scikit-learn's pipeline
  * `clf__C`) is looked up whole first, then by its last segment.
  */
-import type { HyperparameterRole, HyperparameterRolesConfig, KnobSpec } from '../../model/hyperparameter-roles.js';
+import type {
+  HyperparameterRole,
+  HyperparameterRolesConfig,
+  KnobSpec,
+} from '../../model/hyperparameter-roles.js';
 import { AMBIGUOUS, VOCABULARY, type VocabularyGroup } from './vocabulary.js';
 
 /**

@@ -11,7 +11,12 @@
  * library's own parameter constraints and docstrings (test/fixtures/levers/sklearn-parameters.json);
  * the rest are marked "common practice". Names are written as they match, up to case. Pure data.
  */
-import type { HyperparameterRole, KnobScale, UnlimitedWhen, ValueDomain } from '../../model/hyperparameter-roles.js';
+import type {
+  HyperparameterRole,
+  KnobScale,
+  UnlimitedWhen,
+  ValueDomain,
+} from '../../model/hyperparameter-roles.js';
 
 /** A group of names sharing one meaning. */
 export interface VocabularyGroup {
