@@ -8,7 +8,10 @@ export {
   mcnemarExact,
   normalTest,
   twoProportionZ,
+  wilsonAtZ,
   wilsonInterval,
 } from './proportions.js';
+export { newcombeDifference, newcombeInterval } from './proportion-difference.js';
+export type { ProportionDifference } from './proportion-difference.js';
 export { holmAdjust } from './holm.js';
 export type { Interval, TestName, TestResult } from './types.js';
