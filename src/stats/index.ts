@@ -14,4 +14,20 @@ export {
 export { newcombeDifference, newcombeInterval } from './proportion-difference.js';
 export type { ProportionDifference } from './proportion-difference.js';
 export { holmAdjust } from './holm.js';
+export {
+  binomialSamplingVariance,
+  compareSplitMeans,
+  perExampleSamplingVariance,
+  ROUNDOFF_RELATIVE,
+  satterthwaite,
+  splitNoise,
+} from './split-noise.js';
+export type {
+  EvaluationRows,
+  ExampleAggregate,
+  NoiseBasis,
+  SamplingVariance,
+  SplitNoise,
+  SplitNoiseInput,
+} from './split-noise.js';
 export type { Interval, TestName, TestResult } from './types.js';
