@@ -31,3 +31,17 @@ export type {
   SplitNoiseInput,
 } from './split-noise.js';
 export type { Interval, TestName, TestResult } from './types.js';
+export {
+  MAX_REPEATS,
+  mdeMcNemar,
+  mdeMeans,
+  mdePaired,
+  mdeTwoProportions,
+  pairsNeeded,
+  powerTwoProportions,
+  repeatsNeeded,
+  rowsNeededMcNemar,
+  rowsNeededTwoProportions,
+} from './power.js';
+export { noncentralityFor, tTestPower } from './noncentral-t.js';
+export type { ArmNoise, NoRepeatsReason, RepeatsNeeded } from './power.js';
