@@ -38,7 +38,8 @@ export type ArmNoise = Pick<
 /**
  * Smallest |candidate − baseline| this design (the repeats it has) detects with the given power:
  * λ*·sqrt(v_b + v_c), λ* from the noncentral t with the Welch–Satterthwaite ν (module note). Null
- * when either arm's noise is not known.
+ * when either arm's noise is not known. When an arm's noise misses a component
+ * (`basis.missing` not empty) the true MDE is larger than this: report it as "at least".
  */
 export function mdeMeans(
   baseline: ArmNoise,
@@ -60,20 +61,32 @@ export function mdeMeans(
 export type NoRepeatsReason =
   /** The observed change is 0: nothing to detect. */
   | 'no-change'
-  /** The noise is not known, or its seed part is (one repeat): measure it first (≥ 2 repeats). */
+  /** The noise of a run is not known at all: measure it first (≥ 2 repeats give a spread). */
   | 'noise-unknown'
   /** The part that repeats do not reduce (a fixed evaluation set's sampling noise) alone hides the change: more rows are needed, not more seeds. */
   | 'fixed-noise'
   /** More than MAX_REPEATS would be needed. */
   | 'beyond-limit';
 
-export type RepeatsNeeded = { repeats: number } | { repeats: null; reason: NoRepeatsReason };
+export type RepeatsNeeded =
+  | {
+      repeats: number;
+      /**
+       * True when a run's noise misses a component (`basis.missing`: one repeat, so no seed spread;
+       * or fixed rows without σ²). The answer then assumes that component is 0, so at least this
+       * many repeats are needed.
+       */
+      lowerBound: boolean;
+    }
+  | { repeats: null; reason: NoRepeatsReason };
 
 /**
  * Smallest number of repeats k ≥ 2, the same for both runs, at which the t test detects the
- * observed change `delta` with the given power (module note). At k repeats an arm's variance is perRepeat/k + fixed; the
- * seed part then has k − 1 df when it was estimated from a spread (its own df when it is the
- * sampling floor), the fixed part keeps its df. Null with a reason (see `NoRepeatsReason`).
+ * observed change `delta` with the given power (module note). At k repeats an arm's variance is
+ * perRepeat/k + fixed; the seed part then has k − 1 df when it was estimated from a spread (its own
+ * df when it is the sampling floor), the fixed part keeps its df. `fixed-noise` holds even when a
+ * component is missing (a missing component only adds noise). Null with a reason (see
+ * `NoRepeatsReason`).
  */
 export function repeatsNeeded(
   delta: number,
@@ -87,9 +100,8 @@ export function repeatsNeeded(
   assertFinite('delta', delta);
   if (delta === 0) return { repeats: null, reason: 'no-change' };
   const arms = [baseline, candidate];
-  if (arms.some((a) => !a.known || a.basis.missing.includes('seed'))) {
-    return { repeats: null, reason: 'noise-unknown' };
-  }
+  if (arms.some((a) => !a.known)) return { repeats: null, reason: 'noise-unknown' };
+  const lowerBound = arms.some((a) => a.basis.missing.length > 0);
   const target = Math.abs(delta);
   const fixedOnly = arms.reduce((s, a) => s + a.fixed.variance, 0);
   if (fixedOnly > 0) {
@@ -111,7 +123,7 @@ export function repeatsNeeded(
   };
   // Power rises with k (less variance, more df), so the first k that reaches it is found by
   // doubling and then bisection.
-  if (reaches(2)) return { repeats: 2 };
+  if (reaches(2)) return { repeats: 2, lowerBound };
   let lo = 2;
   let hi = 4;
   while (!reaches(hi)) {
@@ -124,7 +136,7 @@ export function repeatsNeeded(
     if (reaches(mid)) hi = mid;
     else lo = mid;
   }
-  return { repeats: hi };
+  return { repeats: hi, lowerBound };
 }
 
 // ---------------------------------------------------------------------------------------------

@@ -95,9 +95,18 @@ describe('repeatsNeeded', () => {
   it('Cohen’s table: d = 0.2, 0.5, 0.8 need 394, 64, 26 repeats per run', () => {
     // Source: Cohen (1988) Table 2.4.1, 393, 64, 26 (from memory; VALUES.md §12); statsmodels
     // TTestIndPower 393.41, 63.77, 25.52 (computed), rounded up.
-    expect(repeatsNeeded(0.2, seedArm(3), seedArm(3), 0.05)).toEqual({ repeats: 394 });
-    expect(repeatsNeeded(0.5, seedArm(3), seedArm(3), 0.05)).toEqual({ repeats: 64 });
-    expect(repeatsNeeded(-0.8, seedArm(3), seedArm(3), 0.05)).toEqual({ repeats: 26 });
+    expect(repeatsNeeded(0.2, seedArm(3), seedArm(3), 0.05)).toEqual({
+      repeats: 394,
+      lowerBound: false,
+    });
+    expect(repeatsNeeded(0.5, seedArm(3), seedArm(3), 0.05)).toEqual({
+      repeats: 64,
+      lowerBound: false,
+    });
+    expect(repeatsNeeded(-0.8, seedArm(3), seedArm(3), 0.05)).toEqual({
+      repeats: 26,
+      lowerBound: false,
+    });
   });
 
   it('is statsmodels TTestIndPower n rounded up', () => {
@@ -105,6 +114,7 @@ describe('repeatsNeeded', () => {
       // Source: computed (statsmodels 0.13.5 TTestIndPower.solve_power), power-statsmodels.json
       expect(repeatsNeeded(r.d, seedArm(5), seedArm(5), 0.05)).toEqual({
         repeats: Math.max(2, Math.ceil(r.n)),
+        lowerBound: false,
       });
     }
   });
@@ -118,9 +128,19 @@ describe('repeatsNeeded', () => {
       repeats: null,
       reason: 'noise-unknown',
     });
-    // One repeat of a proportion: σ² is known but the seed part is not.
+    // One repeat of a proportion: σ² is known but the seed part is not. Fixed rows: the sampling
+    // noise alone decides whether repeats can help; when they can, the count is a lower bound.
     const one = splitNoise({ values: [0.2], sampling: binomialSamplingVariance(0.2, 1000) });
-    expect(repeatsNeeded(0.1, one, one, 0.05)).toEqual({ repeats: null, reason: 'noise-unknown' });
+    expect(repeatsNeeded(0.03, one, one, 0.05)).toEqual({ repeats: null, reason: 'fixed-noise' });
+    expect(repeatsNeeded(0.1, one, one, 0.05)).toEqual({ repeats: 2, lowerBound: true });
+    const onePerRepeat = splitNoise({
+      values: [0.2],
+      sampling: binomialSamplingVariance(0.2, 1000),
+      evaluationRows: 'per-repeat',
+    });
+    const perRepeatNeed = repeatsNeeded(0.01, onePerRepeat, onePerRepeat, 0.05);
+    // Per-repeat rows: σ²/k shrinks, so k follows from σ² = 1.6e-4 (normal formula: 2·2.80²·σ²/δ² ≈ 25.1).
+    expect(perRepeatNeed).toEqual({ repeats: 26, lowerBound: true });
     // Fixed rows, 1,000 examples: MDE from the sampling noise alone is 2.8·sqrt(2·0.16/1000) ≈ 0.050.
     const fixed = splitNoise({
       values: [0.2, 0.21, 0.19],
