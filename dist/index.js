@@ -26078,7 +26078,7 @@ var require_jstat = __commonJS({
         window2.jStat = factory();
       }
     })(exports, function() {
-      var jStat2 = (function(Math2, undefined2) {
+      var jStat3 = (function(Math2, undefined2) {
         var concat = Array.prototype.concat;
         var slice = Array.prototype.slice;
         var toString = Object.prototype.toString;
@@ -26101,53 +26101,53 @@ var require_jstat = __commonJS({
         function toVector(arr) {
           return concat.apply([], arr);
         }
-        function jStat3() {
-          return new jStat3._init(arguments);
+        function jStat4() {
+          return new jStat4._init(arguments);
         }
-        jStat3.fn = jStat3.prototype;
-        jStat3._init = function _init(args) {
+        jStat4.fn = jStat4.prototype;
+        jStat4._init = function _init(args) {
           if (isArray(args[0])) {
             if (isArray(args[0][0])) {
               if (isFunction(args[1]))
-                args[0] = jStat3.map(args[0], args[1]);
+                args[0] = jStat4.map(args[0], args[1]);
               for (var i2 = 0; i2 < args[0].length; i2++)
                 this[i2] = args[0][i2];
               this.length = args[0].length;
             } else {
-              this[0] = isFunction(args[1]) ? jStat3.map(args[0], args[1]) : args[0];
+              this[0] = isFunction(args[1]) ? jStat4.map(args[0], args[1]) : args[0];
               this.length = 1;
             }
           } else if (isNumber(args[0])) {
-            this[0] = jStat3.seq.apply(null, args);
+            this[0] = jStat4.seq.apply(null, args);
             this.length = 1;
-          } else if (args[0] instanceof jStat3) {
-            return jStat3(args[0].toArray());
+          } else if (args[0] instanceof jStat4) {
+            return jStat4(args[0].toArray());
           } else {
             this[0] = [];
             this.length = 1;
           }
           return this;
         };
-        jStat3._init.prototype = jStat3.prototype;
-        jStat3._init.constructor = jStat3;
-        jStat3.utils = {
+        jStat4._init.prototype = jStat4.prototype;
+        jStat4._init.constructor = jStat4;
+        jStat4.utils = {
           calcRdx,
           isArray,
           isFunction,
           isNumber,
           toVector
         };
-        jStat3._random_fn = Math2.random;
-        jStat3.setRandom = function setRandom(fn) {
+        jStat4._random_fn = Math2.random;
+        jStat4.setRandom = function setRandom(fn) {
           if (typeof fn !== "function")
             throw new TypeError("fn is not a function");
-          jStat3._random_fn = fn;
+          jStat4._random_fn = fn;
         };
-        jStat3.extend = function extend(obj) {
+        jStat4.extend = function extend(obj) {
           var i2, j;
           if (arguments.length === 1) {
             for (j in obj)
-              jStat3[j] = obj[j];
+              jStat4[j] = obj[j];
             return this;
           }
           for (i2 = 1; i2 < arguments.length; i2++) {
@@ -26156,36 +26156,36 @@ var require_jstat = __commonJS({
           }
           return obj;
         };
-        jStat3.rows = function rows(arr) {
+        jStat4.rows = function rows(arr) {
           return arr.length || 1;
         };
-        jStat3.cols = function cols(arr) {
+        jStat4.cols = function cols(arr) {
           return arr[0].length || 1;
         };
-        jStat3.dimensions = function dimensions(arr) {
+        jStat4.dimensions = function dimensions(arr) {
           return {
-            rows: jStat3.rows(arr),
-            cols: jStat3.cols(arr)
+            rows: jStat4.rows(arr),
+            cols: jStat4.cols(arr)
           };
         };
-        jStat3.row = function row(arr, index) {
+        jStat4.row = function row(arr, index) {
           if (isArray(index)) {
             return index.map(function(i2) {
-              return jStat3.row(arr, i2);
+              return jStat4.row(arr, i2);
             });
           }
           return arr[index];
         };
-        jStat3.rowa = function rowa(arr, i2) {
-          return jStat3.row(arr, i2);
+        jStat4.rowa = function rowa(arr, i2) {
+          return jStat4.row(arr, i2);
         };
-        jStat3.col = function col(arr, index) {
+        jStat4.col = function col(arr, index) {
           if (isArray(index)) {
-            var submat = jStat3.arange(arr.length).map(function() {
+            var submat = jStat4.arange(arr.length).map(function() {
               return new Array(index.length);
             });
             index.forEach(function(ind, i3) {
-              jStat3.arange(arr.length).forEach(function(j) {
+              jStat4.arange(arr.length).forEach(function(j) {
                 submat[j][i3] = arr[j][ind];
               });
             });
@@ -26196,26 +26196,26 @@ var require_jstat = __commonJS({
             column[i2] = [arr[i2][index]];
           return column;
         };
-        jStat3.cola = function cola(arr, i2) {
-          return jStat3.col(arr, i2).map(function(a) {
+        jStat4.cola = function cola(arr, i2) {
+          return jStat4.col(arr, i2).map(function(a) {
             return a[0];
           });
         };
-        jStat3.diag = function diag(arr) {
-          var nrow = jStat3.rows(arr);
+        jStat4.diag = function diag(arr) {
+          var nrow = jStat4.rows(arr);
           var res = new Array(nrow);
           for (var row = 0; row < nrow; row++)
             res[row] = [arr[row][row]];
           return res;
         };
-        jStat3.antidiag = function antidiag(arr) {
-          var nrow = jStat3.rows(arr) - 1;
+        jStat4.antidiag = function antidiag(arr) {
+          var nrow = jStat4.rows(arr) - 1;
           var res = new Array(nrow);
           for (var i2 = 0; nrow >= 0; nrow--, i2++)
             res[i2] = [arr[i2][nrow]];
           return res;
         };
-        jStat3.transpose = function transpose(arr) {
+        jStat4.transpose = function transpose(arr) {
           var obj = [];
           var objArr, rows, cols, j, i2;
           if (!isArray(arr[0]))
@@ -26230,7 +26230,7 @@ var require_jstat = __commonJS({
           }
           return obj.length === 1 ? obj[0] : obj;
         };
-        jStat3.map = function map(arr, func, toAlter) {
+        jStat4.map = function map(arr, func, toAlter) {
           var row, nrow, ncol, res, col;
           if (!isArray(arr[0]))
             arr = [arr];
@@ -26245,7 +26245,7 @@ var require_jstat = __commonJS({
           }
           return res.length === 1 ? res[0] : res;
         };
-        jStat3.cumreduce = function cumreduce(arr, func, toAlter) {
+        jStat4.cumreduce = function cumreduce(arr, func, toAlter) {
           var row, nrow, ncol, res, col;
           if (!isArray(arr[0]))
             arr = [arr];
@@ -26262,10 +26262,10 @@ var require_jstat = __commonJS({
           }
           return res.length === 1 ? res[0] : res;
         };
-        jStat3.alter = function alter(arr, func) {
-          return jStat3.map(arr, func, true);
+        jStat4.alter = function alter(arr, func) {
+          return jStat4.map(arr, func, true);
         };
-        jStat3.create = function create(rows, cols, func) {
+        jStat4.create = function create(rows, cols, func) {
           var res = new Array(rows);
           var i2, j;
           if (isFunction(cols)) {
@@ -26282,33 +26282,33 @@ var require_jstat = __commonJS({
         function retZero() {
           return 0;
         }
-        jStat3.zeros = function zeros(rows, cols) {
+        jStat4.zeros = function zeros(rows, cols) {
           if (!isNumber(cols))
             cols = rows;
-          return jStat3.create(rows, cols, retZero);
+          return jStat4.create(rows, cols, retZero);
         };
         function retOne() {
           return 1;
         }
-        jStat3.ones = function ones(rows, cols) {
+        jStat4.ones = function ones(rows, cols) {
           if (!isNumber(cols))
             cols = rows;
-          return jStat3.create(rows, cols, retOne);
+          return jStat4.create(rows, cols, retOne);
         };
-        jStat3.rand = function rand(rows, cols) {
+        jStat4.rand = function rand(rows, cols) {
           if (!isNumber(cols))
             cols = rows;
-          return jStat3.create(rows, cols, jStat3._random_fn);
+          return jStat4.create(rows, cols, jStat4._random_fn);
         };
         function retIdent(i2, j) {
           return i2 === j ? 1 : 0;
         }
-        jStat3.identity = function identity(rows, cols) {
+        jStat4.identity = function identity(rows, cols) {
           if (!isNumber(cols))
             cols = rows;
-          return jStat3.create(rows, cols, retIdent);
+          return jStat4.create(rows, cols, retIdent);
         };
-        jStat3.symmetric = function symmetric(arr) {
+        jStat4.symmetric = function symmetric(arr) {
           var size = arr.length;
           var row, col;
           if (arr.length !== arr[0].length)
@@ -26320,10 +26320,10 @@ var require_jstat = __commonJS({
           }
           return true;
         };
-        jStat3.clear = function clear(arr) {
-          return jStat3.alter(arr, retZero);
+        jStat4.clear = function clear(arr) {
+          return jStat4.alter(arr, retZero);
         };
-        jStat3.seq = function seq(min, max2, length, func) {
+        jStat4.seq = function seq(min, max2, length, func) {
           if (!isFunction(func))
             func = false;
           var arr = [];
@@ -26336,7 +26336,7 @@ var require_jstat = __commonJS({
           }
           return arr;
         };
-        jStat3.arange = function arange(start, end, step) {
+        jStat4.arange = function arange(start, end, step) {
           var rl = [];
           var i2;
           step = step || 1;
@@ -26364,13 +26364,13 @@ var require_jstat = __commonJS({
           }
           return rl;
         };
-        jStat3.slice = /* @__PURE__ */ (function() {
+        jStat4.slice = /* @__PURE__ */ (function() {
           function _slice(list, start, end, step) {
             var i2;
             var rl = [];
             var length = list.length;
             if (start === undefined2 && end === undefined2 && step === undefined2) {
-              return jStat3.copy(list);
+              return jStat4.copy(list);
             }
             start = start || 0;
             end = end || list.length;
@@ -26403,12 +26403,12 @@ var require_jstat = __commonJS({
             if (isNumber(rcSlice.row)) {
               if (isNumber(rcSlice.col))
                 return list[rcSlice.row][rcSlice.col];
-              var row = jStat3.rowa(list, rcSlice.row);
+              var row = jStat4.rowa(list, rcSlice.row);
               colSlice = rcSlice.col || {};
               return _slice(row, colSlice.start, colSlice.end, colSlice.step);
             }
             if (isNumber(rcSlice.col)) {
-              var col = jStat3.cola(list, rcSlice.col);
+              var col = jStat4.cola(list, rcSlice.col);
               rowSlice = rcSlice.row || {};
               return _slice(col, rowSlice.start, rowSlice.end, rowSlice.step);
             }
@@ -26421,7 +26421,7 @@ var require_jstat = __commonJS({
           }
           return slice2;
         })();
-        jStat3.sliceAssign = function sliceAssign(A, rcSlice, B) {
+        jStat4.sliceAssign = function sliceAssign(A, rcSlice, B) {
           var nl, ml;
           if (isNumber(rcSlice.row)) {
             if (isNumber(rcSlice.col))
@@ -26430,7 +26430,7 @@ var require_jstat = __commonJS({
             rcSlice.col.start = rcSlice.col.start || 0;
             rcSlice.col.end = rcSlice.col.end || A[0].length;
             rcSlice.col.step = rcSlice.col.step || 1;
-            nl = jStat3.arange(
+            nl = jStat4.arange(
               rcSlice.col.start,
               Math2.min(A.length, rcSlice.col.end),
               rcSlice.col.step
@@ -26446,7 +26446,7 @@ var require_jstat = __commonJS({
             rcSlice.row.start = rcSlice.row.start || 0;
             rcSlice.row.end = rcSlice.row.end || A.length;
             rcSlice.row.step = rcSlice.row.step || 1;
-            ml = jStat3.arange(
+            ml = jStat4.arange(
               rcSlice.row.start,
               Math2.min(A[0].length, rcSlice.row.end),
               rcSlice.row.step
@@ -26466,12 +26466,12 @@ var require_jstat = __commonJS({
           rcSlice.col.start = rcSlice.col.start || 0;
           rcSlice.col.end = rcSlice.col.end || A[0].length;
           rcSlice.col.step = rcSlice.col.step || 1;
-          ml = jStat3.arange(
+          ml = jStat4.arange(
             rcSlice.row.start,
             Math2.min(A.length, rcSlice.row.end),
             rcSlice.row.step
           );
-          nl = jStat3.arange(
+          nl = jStat4.arange(
             rcSlice.col.start,
             Math2.min(A[0].length, rcSlice.col.end),
             rcSlice.col.step
@@ -26483,14 +26483,14 @@ var require_jstat = __commonJS({
           });
           return A;
         };
-        jStat3.diagonal = function diagonal(diagArray) {
-          var mat = jStat3.zeros(diagArray.length, diagArray.length);
+        jStat4.diagonal = function diagonal(diagArray) {
+          var mat = jStat4.zeros(diagArray.length, diagArray.length);
           diagArray.forEach(function(t, i2) {
             mat[i2][i2] = t;
           });
           return mat;
         };
-        jStat3.copy = function copy(A) {
+        jStat4.copy = function copy(A) {
           return A.map(function(row) {
             if (isNumber(row))
               return row;
@@ -26499,7 +26499,7 @@ var require_jstat = __commonJS({
             });
           });
         };
-        var jProto = jStat3.prototype;
+        var jProto = jStat4.prototype;
         jProto.length = 0;
         jProto.push = Array.prototype.push;
         jProto.sort = Array.prototype.sort;
@@ -26509,13 +26509,13 @@ var require_jstat = __commonJS({
           return this.length > 1 ? slice.call(this) : slice.call(this)[0];
         };
         jProto.map = function map(func, toAlter) {
-          return jStat3(jStat3.map(this, func, toAlter));
+          return jStat4(jStat4.map(this, func, toAlter));
         };
         jProto.cumreduce = function cumreduce(func, toAlter) {
-          return jStat3(jStat3.cumreduce(this, func, toAlter));
+          return jStat4(jStat4.cumreduce(this, func, toAlter));
         };
         jProto.alter = function alter(func) {
-          jStat3.alter(this, func);
+          jStat4.alter(this, func);
           return this;
         };
         (function(funcs) {
@@ -26528,8 +26528,8 @@ var require_jstat = __commonJS({
                 });
                 return this;
               }
-              results = jStat3[passfunc](this);
-              return isArray(results) ? jStat3(results) : results;
+              results = jStat4[passfunc](this);
+              return isArray(results) ? jStat4(results) : results;
             };
           })(funcs[i2]);
         })("transpose clear symmetric rows cols dimensions diag antidiag".split(" "));
@@ -26543,43 +26543,43 @@ var require_jstat = __commonJS({
                 });
                 return this;
               }
-              return jStat3(jStat3[passfunc](this, index));
+              return jStat4(jStat4[passfunc](this, index));
             };
           })(funcs[i2]);
         })("row col".split(" "));
         (function(funcs) {
           for (var i2 = 0; i2 < funcs.length; i2++) (function(passfunc) {
             jProto[passfunc] = function() {
-              return jStat3(jStat3[passfunc].apply(null, arguments));
+              return jStat4(jStat4[passfunc].apply(null, arguments));
             };
           })(funcs[i2]);
         })("create zeros ones rand identity".split(" "));
-        return jStat3;
+        return jStat4;
       })(Math);
-      (function(jStat3, Math2) {
-        var isFunction = jStat3.utils.isFunction;
+      (function(jStat4, Math2) {
+        var isFunction = jStat4.utils.isFunction;
         function ascNum(a, b) {
           return a - b;
         }
         function clip2(arg, min, max2) {
           return Math2.max(min, Math2.min(arg, max2));
         }
-        jStat3.sum = function sum(arr) {
+        jStat4.sum = function sum(arr) {
           var sum2 = 0;
           var i2 = arr.length;
           while (--i2 >= 0)
             sum2 += arr[i2];
           return sum2;
         };
-        jStat3.sumsqrd = function sumsqrd(arr) {
+        jStat4.sumsqrd = function sumsqrd(arr) {
           var sum = 0;
           var i2 = arr.length;
           while (--i2 >= 0)
             sum += arr[i2] * arr[i2];
           return sum;
         };
-        jStat3.sumsqerr = function sumsqerr(arr) {
-          var mean2 = jStat3.mean(arr);
+        jStat4.sumsqerr = function sumsqerr(arr) {
+          var mean2 = jStat4.mean(arr);
           var sum = 0;
           var i2 = arr.length;
           var tmp;
@@ -26589,21 +26589,21 @@ var require_jstat = __commonJS({
           }
           return sum;
         };
-        jStat3.sumrow = function sumrow(arr) {
+        jStat4.sumrow = function sumrow(arr) {
           var sum = 0;
           var i2 = arr.length;
           while (--i2 >= 0)
             sum += arr[i2];
           return sum;
         };
-        jStat3.product = function product(arr) {
+        jStat4.product = function product(arr) {
           var prod = 1;
           var i2 = arr.length;
           while (--i2 >= 0)
             prod *= arr[i2];
           return prod;
         };
-        jStat3.min = function min(arr) {
+        jStat4.min = function min(arr) {
           var low = arr[0];
           var i2 = 0;
           while (++i2 < arr.length)
@@ -26611,7 +26611,7 @@ var require_jstat = __commonJS({
               low = arr[i2];
           return low;
         };
-        jStat3.max = function max2(arr) {
+        jStat4.max = function max2(arr) {
           var high = arr[0];
           var i2 = 0;
           while (++i2 < arr.length)
@@ -26619,7 +26619,7 @@ var require_jstat = __commonJS({
               high = arr[i2];
           return high;
         };
-        jStat3.unique = function unique(arr) {
+        jStat4.unique = function unique(arr) {
           var hash = {}, _arr = [];
           for (var i2 = 0; i2 < arr.length; i2++) {
             if (!hash[arr[i2]]) {
@@ -26629,33 +26629,33 @@ var require_jstat = __commonJS({
           }
           return _arr;
         };
-        jStat3.mean = function mean2(arr) {
-          return jStat3.sum(arr) / arr.length;
+        jStat4.mean = function mean2(arr) {
+          return jStat4.sum(arr) / arr.length;
         };
-        jStat3.meansqerr = function meansqerr(arr) {
-          return jStat3.sumsqerr(arr) / arr.length;
+        jStat4.meansqerr = function meansqerr(arr) {
+          return jStat4.sumsqerr(arr) / arr.length;
         };
-        jStat3.geomean = function geomean(arr) {
+        jStat4.geomean = function geomean(arr) {
           var logs = arr.map(Math2.log);
-          var meanOfLogs = jStat3.mean(logs);
+          var meanOfLogs = jStat4.mean(logs);
           return Math2.exp(meanOfLogs);
         };
-        jStat3.median = function median(arr) {
+        jStat4.median = function median(arr) {
           var arrlen = arr.length;
           var _arr = arr.slice().sort(ascNum);
           return !(arrlen & 1) ? (_arr[arrlen / 2 - 1] + _arr[arrlen / 2]) / 2 : _arr[arrlen / 2 | 0];
         };
-        jStat3.cumsum = function cumsum(arr) {
-          return jStat3.cumreduce(arr, function(a, b) {
+        jStat4.cumsum = function cumsum(arr) {
+          return jStat4.cumreduce(arr, function(a, b) {
             return a + b;
           });
         };
-        jStat3.cumprod = function cumprod(arr) {
-          return jStat3.cumreduce(arr, function(a, b) {
+        jStat4.cumprod = function cumprod(arr) {
+          return jStat4.cumreduce(arr, function(a, b) {
             return a * b;
           });
         };
-        jStat3.diff = function diff(arr) {
+        jStat4.diff = function diff(arr) {
           var diffs = [];
           var arrLen = arr.length;
           var i2;
@@ -26663,7 +26663,7 @@ var require_jstat = __commonJS({
             diffs.push(arr[i2] - arr[i2 - 1]);
           return diffs;
         };
-        jStat3.rank = function(arr) {
+        jStat4.rank = function(arr) {
           var i2;
           var distinctNumbers = [];
           var numberCounts = {};
@@ -26692,7 +26692,7 @@ var require_jstat = __commonJS({
             return numberRanks[number3];
           });
         };
-        jStat3.mode = function mode(arr) {
+        jStat4.mode = function mode(arr) {
           var arrLen = arr.length;
           var _arr = arr.slice().sort(ascNum);
           var count2 = 1;
@@ -26717,23 +26717,23 @@ var require_jstat = __commonJS({
           }
           return numMaxCount === 0 ? mode_arr[0] : mode_arr;
         };
-        jStat3.range = function range(arr) {
-          return jStat3.max(arr) - jStat3.min(arr);
+        jStat4.range = function range(arr) {
+          return jStat4.max(arr) - jStat4.min(arr);
         };
-        jStat3.variance = function variance(arr, flag) {
-          return jStat3.sumsqerr(arr) / (arr.length - (flag ? 1 : 0));
+        jStat4.variance = function variance(arr, flag) {
+          return jStat4.sumsqerr(arr) / (arr.length - (flag ? 1 : 0));
         };
-        jStat3.pooledvariance = function pooledvariance(arr) {
+        jStat4.pooledvariance = function pooledvariance(arr) {
           var sumsqerr = arr.reduce(function(a, samples) {
-            return a + jStat3.sumsqerr(samples);
+            return a + jStat4.sumsqerr(samples);
           }, 0);
           var count2 = arr.reduce(function(a, samples) {
             return a + samples.length;
           }, 0);
           return sumsqerr / (count2 - arr.length);
         };
-        jStat3.deviation = function(arr) {
-          var mean2 = jStat3.mean(arr);
+        jStat4.deviation = function(arr) {
+          var mean2 = jStat4.mean(arr);
           var arrlen = arr.length;
           var dev = new Array(arrlen);
           for (var i2 = 0; i2 < arrlen; i2++) {
@@ -26741,32 +26741,32 @@ var require_jstat = __commonJS({
           }
           return dev;
         };
-        jStat3.stdev = function stdev(arr, flag) {
-          return Math2.sqrt(jStat3.variance(arr, flag));
+        jStat4.stdev = function stdev(arr, flag) {
+          return Math2.sqrt(jStat4.variance(arr, flag));
         };
-        jStat3.pooledstdev = function pooledstdev(arr) {
-          return Math2.sqrt(jStat3.pooledvariance(arr));
+        jStat4.pooledstdev = function pooledstdev(arr) {
+          return Math2.sqrt(jStat4.pooledvariance(arr));
         };
-        jStat3.meandev = function meandev(arr) {
-          var mean2 = jStat3.mean(arr);
+        jStat4.meandev = function meandev(arr) {
+          var mean2 = jStat4.mean(arr);
           var a = [];
           for (var i2 = arr.length - 1; i2 >= 0; i2--) {
             a.push(Math2.abs(arr[i2] - mean2));
           }
-          return jStat3.mean(a);
+          return jStat4.mean(a);
         };
-        jStat3.meddev = function meddev(arr) {
-          var median = jStat3.median(arr);
+        jStat4.meddev = function meddev(arr) {
+          var median = jStat4.median(arr);
           var a = [];
           for (var i2 = arr.length - 1; i2 >= 0; i2--) {
             a.push(Math2.abs(arr[i2] - median));
           }
-          return jStat3.median(a);
+          return jStat4.median(a);
         };
-        jStat3.coeffvar = function coeffvar(arr) {
-          return jStat3.stdev(arr) / jStat3.mean(arr);
+        jStat4.coeffvar = function coeffvar(arr) {
+          return jStat4.stdev(arr) / jStat4.mean(arr);
         };
-        jStat3.quartiles = function quartiles(arr) {
+        jStat4.quartiles = function quartiles(arr) {
           var arrlen = arr.length;
           var _arr = arr.slice().sort(ascNum);
           return [
@@ -26775,7 +26775,7 @@ var require_jstat = __commonJS({
             _arr[Math2.round(arrlen * 3 / 4) - 1]
           ];
         };
-        jStat3.quantiles = function quantiles(arr, quantilesArray, alphap, betap) {
+        jStat4.quantiles = function quantiles(arr, quantilesArray, alphap, betap) {
           var sortedArray = arr.slice().sort(ascNum);
           var quantileVals = [quantilesArray.length];
           var n = arr.length;
@@ -26794,7 +26794,7 @@ var require_jstat = __commonJS({
           }
           return quantileVals;
         };
-        jStat3.percentile = function percentile(arr, k, exclusive) {
+        jStat4.percentile = function percentile(arr, k, exclusive) {
           var _arr = arr.slice().sort(ascNum);
           var realIndex = k * (_arr.length + (exclusive ? 1 : -1)) + (exclusive ? 0 : 1);
           var index = parseInt(realIndex);
@@ -26805,7 +26805,7 @@ var require_jstat = __commonJS({
             return _arr[index - 1];
           }
         };
-        jStat3.percentileOfScore = function percentileOfScore(arr, score, kind) {
+        jStat4.percentileOfScore = function percentileOfScore(arr, score, kind) {
           var counter = 0;
           var len = arr.length;
           var strict = false;
@@ -26820,10 +26820,10 @@ var require_jstat = __commonJS({
           }
           return counter / len;
         };
-        jStat3.histogram = function histogram(arr, binCnt) {
+        jStat4.histogram = function histogram(arr, binCnt) {
           binCnt = binCnt || 4;
-          var first = jStat3.min(arr);
-          var binWidth = (jStat3.max(arr) - first) / binCnt;
+          var first = jStat4.min(arr);
+          var binWidth = (jStat4.max(arr) - first) / binCnt;
           var len = arr.length;
           var bins = [];
           var i2;
@@ -26833,40 +26833,40 @@ var require_jstat = __commonJS({
             bins[Math2.min(Math2.floor((arr[i2] - first) / binWidth), binCnt - 1)] += 1;
           return bins;
         };
-        jStat3.covariance = function covariance(arr1, arr2) {
-          var u = jStat3.mean(arr1);
-          var v = jStat3.mean(arr2);
+        jStat4.covariance = function covariance(arr1, arr2) {
+          var u = jStat4.mean(arr1);
+          var v = jStat4.mean(arr2);
           var arr1Len = arr1.length;
           var sq_dev = new Array(arr1Len);
           var i2;
           for (i2 = 0; i2 < arr1Len; i2++)
             sq_dev[i2] = (arr1[i2] - u) * (arr2[i2] - v);
-          return jStat3.sum(sq_dev) / (arr1Len - 1);
+          return jStat4.sum(sq_dev) / (arr1Len - 1);
         };
-        jStat3.corrcoeff = function corrcoeff(arr1, arr2) {
-          return jStat3.covariance(arr1, arr2) / jStat3.stdev(arr1, 1) / jStat3.stdev(arr2, 1);
+        jStat4.corrcoeff = function corrcoeff(arr1, arr2) {
+          return jStat4.covariance(arr1, arr2) / jStat4.stdev(arr1, 1) / jStat4.stdev(arr2, 1);
         };
-        jStat3.spearmancoeff = function(arr1, arr2) {
-          arr1 = jStat3.rank(arr1);
-          arr2 = jStat3.rank(arr2);
-          return jStat3.corrcoeff(arr1, arr2);
+        jStat4.spearmancoeff = function(arr1, arr2) {
+          arr1 = jStat4.rank(arr1);
+          arr2 = jStat4.rank(arr2);
+          return jStat4.corrcoeff(arr1, arr2);
         };
-        jStat3.stanMoment = function stanMoment(arr, n) {
-          var mu = jStat3.mean(arr);
-          var sigma = jStat3.stdev(arr);
+        jStat4.stanMoment = function stanMoment(arr, n) {
+          var mu = jStat4.mean(arr);
+          var sigma = jStat4.stdev(arr);
           var len = arr.length;
           var skewSum = 0;
           for (var i2 = 0; i2 < len; i2++)
             skewSum += Math2.pow((arr[i2] - mu) / sigma, n);
           return skewSum / arr.length;
         };
-        jStat3.skewness = function skewness(arr) {
-          return jStat3.stanMoment(arr, 3);
+        jStat4.skewness = function skewness(arr) {
+          return jStat4.stanMoment(arr, 3);
         };
-        jStat3.kurtosis = function kurtosis(arr) {
-          return jStat3.stanMoment(arr, 4) - 3;
+        jStat4.kurtosis = function kurtosis(arr) {
+          return jStat4.stanMoment(arr, 4) - 3;
         };
-        var jProto = jStat3.prototype;
+        var jProto = jStat4.prototype;
         (function(funcs) {
           for (var i2 = 0; i2 < funcs.length; i2++) (function(passfunc) {
             jProto[passfunc] = function(fullbool, func) {
@@ -26886,10 +26886,10 @@ var require_jstat = __commonJS({
               if (this.length > 1) {
                 tmpthis = fullbool === true ? this : this.transpose();
                 for (; i3 < tmpthis.length; i3++)
-                  arr[i3] = jStat3[passfunc](tmpthis[i3]);
+                  arr[i3] = jStat4[passfunc](tmpthis[i3]);
                 return arr;
               }
-              return jStat3[passfunc](this[0], fullbool);
+              return jStat4[passfunc](this[0], fullbool);
             };
           })(funcs[i2]);
         })("cumsum cumprod".split(" "));
@@ -26913,10 +26913,10 @@ var require_jstat = __commonJS({
                 if (passfunc !== "sumrow")
                   tmpthis = fullbool === true ? this : this.transpose();
                 for (; i3 < tmpthis.length; i3++)
-                  arr[i3] = jStat3[passfunc](tmpthis[i3]);
-                return fullbool === true ? jStat3[passfunc](jStat3.utils.toVector(arr)) : arr;
+                  arr[i3] = jStat4[passfunc](tmpthis[i3]);
+                return fullbool === true ? jStat4[passfunc](jStat4.utils.toVector(arr)) : arr;
               }
-              return jStat3[passfunc](this[0], fullbool);
+              return jStat4[passfunc](this[0], fullbool);
             };
           })(funcs[i2]);
         })("sum sumsqrd sumsqerr sumrow product min max unique mean meansqerr geomean median diff rank mode range variance deviation stdev meandev meddev coeffvar quartiles histogram skewness kurtosis".split(" "));
@@ -26941,7 +26941,7 @@ var require_jstat = __commonJS({
               } else {
                 callbackFunction = void 0;
                 var curriedFunction = function curriedFunction2(vector) {
-                  return jStat3[passfunc].apply(tmpthis, [vector].concat(args));
+                  return jStat4[passfunc].apply(tmpthis, [vector].concat(args));
                 };
               }
               if (this.length > 1) {
@@ -26954,9 +26954,9 @@ var require_jstat = __commonJS({
             };
           })(funcs[i2]);
         })("quantiles percentileOfScore".split(" "));
-      })(jStat2, Math);
-      (function(jStat3, Math2) {
-        jStat3.gammaln = function gammaln(x2) {
+      })(jStat3, Math);
+      (function(jStat4, Math2) {
+        jStat4.gammaln = function gammaln(x2) {
           var j = 0;
           var cof = [
             76.18009172947146,
@@ -26974,7 +26974,7 @@ var require_jstat = __commonJS({
             ser += cof[j] / ++y;
           return Math2.log(2.5066282746310007 * ser / xx) - tmp;
         };
-        jStat3.loggam = function loggam(x2) {
+        jStat4.loggam = function loggam(x2) {
           var x0, x22, xp, gl, gl0;
           var k, n;
           var a = [
@@ -27014,7 +27014,7 @@ var require_jstat = __commonJS({
           }
           return gl;
         };
-        jStat3.gammafn = function gammafn(x2) {
+        jStat4.gammafn = function gammafn(x2) {
           var p = [
             -1.716185138865495,
             24.76565080557592,
@@ -27077,11 +27077,11 @@ var require_jstat = __commonJS({
           }
           return res;
         };
-        jStat3.gammap = function gammap(a, x2) {
-          return jStat3.lowRegGamma(a, x2) * jStat3.gammafn(a);
+        jStat4.gammap = function gammap(a, x2) {
+          return jStat4.lowRegGamma(a, x2) * jStat4.gammafn(a);
         };
-        jStat3.lowRegGamma = function lowRegGamma(a, x2) {
-          var aln = jStat3.gammaln(a);
+        jStat4.lowRegGamma = function lowRegGamma(a, x2) {
+          var aln = jStat4.gammaln(a);
           var ap = a;
           var sum = 1 / a;
           var del = sum;
@@ -27110,30 +27110,30 @@ var require_jstat = __commonJS({
           }
           return 1 - h * Math2.exp(-x2 + a * Math2.log(x2) - aln);
         };
-        jStat3.factorialln = function factorialln(n) {
-          return n < 0 ? NaN : jStat3.gammaln(n + 1);
+        jStat4.factorialln = function factorialln(n) {
+          return n < 0 ? NaN : jStat4.gammaln(n + 1);
         };
-        jStat3.factorial = function factorial(n) {
-          return n < 0 ? NaN : jStat3.gammafn(n + 1);
+        jStat4.factorial = function factorial(n) {
+          return n < 0 ? NaN : jStat4.gammafn(n + 1);
         };
-        jStat3.combination = function combination(n, m) {
-          return n > 170 || m > 170 ? Math2.exp(jStat3.combinationln(n, m)) : jStat3.factorial(n) / jStat3.factorial(m) / jStat3.factorial(n - m);
+        jStat4.combination = function combination(n, m) {
+          return n > 170 || m > 170 ? Math2.exp(jStat4.combinationln(n, m)) : jStat4.factorial(n) / jStat4.factorial(m) / jStat4.factorial(n - m);
         };
-        jStat3.combinationln = function combinationln(n, m) {
-          return jStat3.factorialln(n) - jStat3.factorialln(m) - jStat3.factorialln(n - m);
+        jStat4.combinationln = function combinationln(n, m) {
+          return jStat4.factorialln(n) - jStat4.factorialln(m) - jStat4.factorialln(n - m);
         };
-        jStat3.permutation = function permutation(n, m) {
-          return jStat3.factorial(n) / jStat3.factorial(n - m);
+        jStat4.permutation = function permutation(n, m) {
+          return jStat4.factorial(n) / jStat4.factorial(n - m);
         };
-        jStat3.betafn = function betafn(x2, y) {
+        jStat4.betafn = function betafn(x2, y) {
           if (x2 <= 0 || y <= 0)
             return void 0;
-          return x2 + y > 170 ? Math2.exp(jStat3.betaln(x2, y)) : jStat3.gammafn(x2) * jStat3.gammafn(y) / jStat3.gammafn(x2 + y);
+          return x2 + y > 170 ? Math2.exp(jStat4.betaln(x2, y)) : jStat4.gammafn(x2) * jStat4.gammafn(y) / jStat4.gammafn(x2 + y);
         };
-        jStat3.betaln = function betaln(x2, y) {
-          return jStat3.gammaln(x2) + jStat3.gammaln(y) - jStat3.gammaln(x2 + y);
+        jStat4.betaln = function betaln(x2, y) {
+          return jStat4.gammaln(x2) + jStat4.gammaln(y) - jStat4.gammaln(x2 + y);
         };
-        jStat3.betacf = function betacf(x2, a, b) {
+        jStat4.betacf = function betacf(x2, a, b) {
           var fpmin = 1e-30;
           var m = 1;
           var qab = a + b;
@@ -27172,11 +27172,11 @@ var require_jstat = __commonJS({
           }
           return h;
         };
-        jStat3.gammapinv = function gammapinv(p, a) {
+        jStat4.gammapinv = function gammapinv(p, a) {
           var j = 0;
           var a1 = a - 1;
           var EPS = 1e-8;
-          var gln = jStat3.gammaln(a);
+          var gln = jStat4.gammaln(a);
           var x2, err2, t, u, pp, lna1, afac;
           if (p >= 1)
             return Math2.max(100, a + 100 * Math2.sqrt(a));
@@ -27204,7 +27204,7 @@ var require_jstat = __commonJS({
           for (; j < 12; j++) {
             if (x2 <= 0)
               return 0;
-            err2 = jStat3.lowRegGamma(a, x2) - p;
+            err2 = jStat4.lowRegGamma(a, x2) - p;
             if (a > 1)
               t = afac * Math2.exp(-(x2 - a1) + a1 * (Math2.log(x2) - lna1));
             else
@@ -27218,7 +27218,7 @@ var require_jstat = __commonJS({
           }
           return x2;
         };
-        jStat3.erf = function erf(x2) {
+        jStat4.erf = function erf(x2) {
           var cof = [
             -1.3026537197817094,
             0.6419697923564902,
@@ -27268,10 +27268,10 @@ var require_jstat = __commonJS({
           res = t * Math2.exp(-x2 * x2 + 0.5 * (cof[0] + ty * d) - dd);
           return isneg ? res - 1 : 1 - res;
         };
-        jStat3.erfc = function erfc(x2) {
-          return 1 - jStat3.erf(x2);
+        jStat4.erfc = function erfc(x2) {
+          return 1 - jStat4.erf(x2);
         };
-        jStat3.erfcinv = function erfcinv(p) {
+        jStat4.erfcinv = function erfcinv(p) {
           var j = 0;
           var x2, err2, t, pp;
           if (p >= 2)
@@ -27282,12 +27282,12 @@ var require_jstat = __commonJS({
           t = Math2.sqrt(-2 * Math2.log(pp / 2));
           x2 = -0.70711 * ((2.30753 + t * 0.27061) / (1 + t * (0.99229 + t * 0.04481)) - t);
           for (; j < 2; j++) {
-            err2 = jStat3.erfc(x2) - pp;
+            err2 = jStat4.erfc(x2) - pp;
             x2 += err2 / (1.1283791670955126 * Math2.exp(-x2 * x2) - x2 * err2);
           }
           return p < 1 ? x2 : -x2;
         };
-        jStat3.ibetainv = function ibetainv(p, a, b) {
+        jStat4.ibetainv = function ibetainv(p, a, b) {
           var EPS = 1e-8;
           var a1 = a - 1;
           var b1 = b - 1;
@@ -27318,11 +27318,11 @@ var require_jstat = __commonJS({
             else
               x2 = 1 - Math2.pow(b * w * (1 - p), 1 / b);
           }
-          afac = -jStat3.gammaln(a) - jStat3.gammaln(b) + jStat3.gammaln(a + b);
+          afac = -jStat4.gammaln(a) - jStat4.gammaln(b) + jStat4.gammaln(a + b);
           for (; j < 10; j++) {
             if (x2 === 0 || x2 === 1)
               return x2;
-            err2 = jStat3.ibeta(x2, a, b) - p;
+            err2 = jStat4.ibeta(x2, a, b) - p;
             t = Math2.exp(a1 * Math2.log(x2) + b1 * Math2.log(1 - x2) + afac);
             u = err2 / t;
             x2 -= t = u / (1 - 0.5 * Math2.min(1, u * (a1 / x2 - b1 / (1 - x2))));
@@ -27335,32 +27335,32 @@ var require_jstat = __commonJS({
           }
           return x2;
         };
-        jStat3.ibeta = function ibeta2(x2, a, b) {
-          var bt = x2 === 0 || x2 === 1 ? 0 : Math2.exp(jStat3.gammaln(a + b) - jStat3.gammaln(a) - jStat3.gammaln(b) + a * Math2.log(x2) + b * Math2.log(1 - x2));
+        jStat4.ibeta = function ibeta2(x2, a, b) {
+          var bt = x2 === 0 || x2 === 1 ? 0 : Math2.exp(jStat4.gammaln(a + b) - jStat4.gammaln(a) - jStat4.gammaln(b) + a * Math2.log(x2) + b * Math2.log(1 - x2));
           if (x2 < 0 || x2 > 1)
             return false;
           if (x2 < (a + 1) / (a + b + 2))
-            return bt * jStat3.betacf(x2, a, b) / a;
-          return 1 - bt * jStat3.betacf(1 - x2, b, a) / b;
+            return bt * jStat4.betacf(x2, a, b) / a;
+          return 1 - bt * jStat4.betacf(1 - x2, b, a) / b;
         };
-        jStat3.randn = function randn(n, m) {
+        jStat4.randn = function randn(n, m) {
           var u, v, x2, y, q;
           if (!m)
             m = n;
           if (n)
-            return jStat3.create(n, m, function() {
-              return jStat3.randn();
+            return jStat4.create(n, m, function() {
+              return jStat4.randn();
             });
           do {
-            u = jStat3._random_fn();
-            v = 1.7156 * (jStat3._random_fn() - 0.5);
+            u = jStat4._random_fn();
+            v = 1.7156 * (jStat4._random_fn() - 0.5);
             x2 = u - 0.449871;
             y = Math2.abs(v) + 0.386595;
             q = x2 * x2 + y * (0.196 * y - 0.25472 * x2);
           } while (q > 0.27597 && (q > 0.27846 || v * v > -4 * Math2.log(u) * u * u));
           return v / u;
         };
-        jStat3.randg = function randg(shape, n, m) {
+        jStat4.randg = function randg(shape, n, m) {
           var oalph = shape;
           var a1, a2, u, v, x2, mat;
           if (!m)
@@ -27368,9 +27368,9 @@ var require_jstat = __commonJS({
           if (!shape)
             shape = 1;
           if (n) {
-            mat = jStat3.zeros(n, m);
+            mat = jStat4.zeros(n, m);
             mat.alter(function() {
-              return jStat3.randg(shape);
+              return jStat4.randg(shape);
             });
             return mat;
           }
@@ -27380,25 +27380,25 @@ var require_jstat = __commonJS({
           a2 = 1 / Math2.sqrt(9 * a1);
           do {
             do {
-              x2 = jStat3.randn();
+              x2 = jStat4.randn();
               v = 1 + a2 * x2;
             } while (v <= 0);
             v = v * v * v;
-            u = jStat3._random_fn();
+            u = jStat4._random_fn();
           } while (u > 1 - 0.331 * Math2.pow(x2, 4) && Math2.log(u) > 0.5 * x2 * x2 + a1 * (1 - v + Math2.log(v)));
           if (shape == oalph)
             return a1 * v;
           do {
-            u = jStat3._random_fn();
+            u = jStat4._random_fn();
           } while (u === 0);
           return Math2.pow(u, 1 / oalph) * a1 * v;
         };
         (function(funcs) {
           for (var i2 = 0; i2 < funcs.length; i2++) (function(passfunc) {
-            jStat3.fn[passfunc] = function() {
-              return jStat3(
-                jStat3.map(this, function(value) {
-                  return jStat3[passfunc](value);
+            jStat4.fn[passfunc] = function() {
+              return jStat4(
+                jStat4.map(this, function(value) {
+                  return jStat4[passfunc](value);
                 })
               );
             };
@@ -27406,16 +27406,16 @@ var require_jstat = __commonJS({
         })("gammaln gammafn factorial factorialln".split(" "));
         (function(funcs) {
           for (var i2 = 0; i2 < funcs.length; i2++) (function(passfunc) {
-            jStat3.fn[passfunc] = function() {
-              return jStat3(jStat3[passfunc].apply(null, arguments));
+            jStat4.fn[passfunc] = function() {
+              return jStat4(jStat4[passfunc].apply(null, arguments));
             };
           })(funcs[i2]);
         })("randn".split(" "));
-      })(jStat2, Math);
-      (function(jStat3, Math2) {
+      })(jStat3, Math);
+      (function(jStat4, Math2) {
         (function(list) {
           for (var i2 = 0; i2 < list.length; i2++) (function(func) {
-            jStat3[func] = function f(a, b, c) {
+            jStat4[func] = function f(a, b, c) {
               if (!(this instanceof f))
                 return new f(a, b, c);
               this._a = a;
@@ -27423,85 +27423,85 @@ var require_jstat = __commonJS({
               this._c = c;
               return this;
             };
-            jStat3.fn[func] = function(a, b, c) {
-              var newthis = jStat3[func](a, b, c);
+            jStat4.fn[func] = function(a, b, c) {
+              var newthis = jStat4[func](a, b, c);
               newthis.data = this;
               return newthis;
             };
-            jStat3[func].prototype.sample = function(arr) {
+            jStat4[func].prototype.sample = function(arr) {
               var a = this._a;
               var b = this._b;
               var c = this._c;
               if (arr)
-                return jStat3.alter(arr, function() {
-                  return jStat3[func].sample(a, b, c);
+                return jStat4.alter(arr, function() {
+                  return jStat4[func].sample(a, b, c);
                 });
               else
-                return jStat3[func].sample(a, b, c);
+                return jStat4[func].sample(a, b, c);
             };
             (function(vals) {
               for (var i3 = 0; i3 < vals.length; i3++) (function(fnfunc) {
-                jStat3[func].prototype[fnfunc] = function(x2) {
+                jStat4[func].prototype[fnfunc] = function(x2) {
                   var a = this._a;
                   var b = this._b;
                   var c = this._c;
                   if (!x2 && x2 !== 0)
                     x2 = this.data;
                   if (typeof x2 !== "number") {
-                    return jStat3.fn.map.call(x2, function(x3) {
-                      return jStat3[func][fnfunc](x3, a, b, c);
+                    return jStat4.fn.map.call(x2, function(x3) {
+                      return jStat4[func][fnfunc](x3, a, b, c);
                     });
                   }
-                  return jStat3[func][fnfunc](x2, a, b, c);
+                  return jStat4[func][fnfunc](x2, a, b, c);
                 };
               })(vals[i3]);
             })("pdf cdf inv".split(" "));
             (function(vals) {
               for (var i3 = 0; i3 < vals.length; i3++) (function(fnfunc) {
-                jStat3[func].prototype[fnfunc] = function() {
-                  return jStat3[func][fnfunc](this._a, this._b, this._c);
+                jStat4[func].prototype[fnfunc] = function() {
+                  return jStat4[func][fnfunc](this._a, this._b, this._c);
                 };
               })(vals[i3]);
             })("mean median mode variance".split(" "));
           })(list[i2]);
         })("beta centralF cauchy chisquare exponential gamma invgamma kumaraswamy laplace lognormal noncentralt normal pareto studentt weibull uniform binomial negbin hypgeom poisson triangular tukey arcsine".split(" "));
-        jStat3.extend(jStat3.beta, {
+        jStat4.extend(jStat4.beta, {
           pdf: function pdf(x2, alpha, beta) {
             if (x2 > 1 || x2 < 0)
               return 0;
             if (alpha == 1 && beta == 1)
               return 1;
             if (alpha < 512 && beta < 512) {
-              return Math2.pow(x2, alpha - 1) * Math2.pow(1 - x2, beta - 1) / jStat3.betafn(alpha, beta);
+              return Math2.pow(x2, alpha - 1) * Math2.pow(1 - x2, beta - 1) / jStat4.betafn(alpha, beta);
             } else {
-              return Math2.exp((alpha - 1) * Math2.log(x2) + (beta - 1) * Math2.log(1 - x2) - jStat3.betaln(alpha, beta));
+              return Math2.exp((alpha - 1) * Math2.log(x2) + (beta - 1) * Math2.log(1 - x2) - jStat4.betaln(alpha, beta));
             }
           },
           cdf: function cdf(x2, alpha, beta) {
-            return x2 > 1 || x2 < 0 ? (x2 > 1) * 1 : jStat3.ibeta(x2, alpha, beta);
+            return x2 > 1 || x2 < 0 ? (x2 > 1) * 1 : jStat4.ibeta(x2, alpha, beta);
           },
           inv: function inv(x2, alpha, beta) {
-            return jStat3.ibetainv(x2, alpha, beta);
+            return jStat4.ibetainv(x2, alpha, beta);
           },
           mean: function mean2(alpha, beta) {
             return alpha / (alpha + beta);
           },
           median: function median(alpha, beta) {
-            return jStat3.ibetainv(0.5, alpha, beta);
+            return jStat4.ibetainv(0.5, alpha, beta);
           },
           mode: function mode(alpha, beta) {
             return (alpha - 1) / (alpha + beta - 2);
           },
           // return a random sample
           sample: function sample(alpha, beta) {
-            var u = jStat3.randg(alpha);
-            return u / (u + jStat3.randg(beta));
+            var u = jStat4.randg(alpha);
+            return u / (u + jStat4.randg(beta));
           },
           variance: function variance(alpha, beta) {
             return alpha * beta / (Math2.pow(alpha + beta, 2) * (alpha + beta + 1));
           }
         });
-        jStat3.extend(jStat3.centralF, {
+        jStat4.extend(jStat4.centralF, {
           // This implementation of the pdf function avoids float overflow
           // See the way that R calculates this value:
           // https://svn.r-project.org/R/trunk/src/nmath/df.c
@@ -27516,20 +27516,20 @@ var require_jstat = __commonJS({
               if (x2 === 0 && df1 === 2) {
                 return 1;
               }
-              return 1 / jStat3.betafn(df1 / 2, df2 / 2) * Math2.pow(df1 / df2, df1 / 2) * Math2.pow(x2, df1 / 2 - 1) * Math2.pow(1 + df1 / df2 * x2, -(df1 + df2) / 2);
+              return 1 / jStat4.betafn(df1 / 2, df2 / 2) * Math2.pow(df1 / df2, df1 / 2) * Math2.pow(x2, df1 / 2 - 1) * Math2.pow(1 + df1 / df2 * x2, -(df1 + df2) / 2);
             }
             p = df1 * x2 / (df2 + x2 * df1);
             q = df2 / (df2 + x2 * df1);
             f = df1 * q / 2;
-            return f * jStat3.binomial.pdf((df1 - 2) / 2, (df1 + df2 - 2) / 2, p);
+            return f * jStat4.binomial.pdf((df1 - 2) / 2, (df1 + df2 - 2) / 2, p);
           },
           cdf: function cdf(x2, df1, df2) {
             if (x2 < 0)
               return 0;
-            return jStat3.ibeta(df1 * x2 / (df1 * x2 + df2), df1 / 2, df2 / 2);
+            return jStat4.ibeta(df1 * x2 / (df1 * x2 + df2), df1 / 2, df2 / 2);
           },
           inv: function inv(x2, df1, df2) {
-            return df2 / (df1 * (1 / jStat3.ibetainv(x2, df1 / 2, df2 / 2) - 1));
+            return df2 / (df1 * (1 / jStat4.ibetainv(x2, df1 / 2, df2 / 2) - 1));
           },
           mean: function mean2(df1, df2) {
             return df2 > 2 ? df2 / (df2 - 2) : void 0;
@@ -27539,8 +27539,8 @@ var require_jstat = __commonJS({
           },
           // return a random sample
           sample: function sample(df1, df2) {
-            var x1 = jStat3.randg(df1 / 2) * 2;
-            var x2 = jStat3.randg(df2 / 2) * 2;
+            var x1 = jStat4.randg(df1 / 2) * 2;
+            var x2 = jStat4.randg(df2 / 2) * 2;
             return x1 / df1 / (x2 / df2);
           },
           variance: function variance(df1, df2) {
@@ -27549,7 +27549,7 @@ var require_jstat = __commonJS({
             return 2 * df2 * df2 * (df1 + df2 - 2) / (df1 * (df2 - 2) * (df2 - 2) * (df2 - 4));
           }
         });
-        jStat3.extend(jStat3.cauchy, {
+        jStat4.extend(jStat4.cauchy, {
           pdf: function pdf(x2, local, scale) {
             if (scale < 0) {
               return 0;
@@ -27569,22 +27569,22 @@ var require_jstat = __commonJS({
             return local;
           },
           sample: function sample(local, scale) {
-            return jStat3.randn() * Math2.sqrt(1 / (2 * jStat3.randg(0.5))) * scale + local;
+            return jStat4.randn() * Math2.sqrt(1 / (2 * jStat4.randg(0.5))) * scale + local;
           }
         });
-        jStat3.extend(jStat3.chisquare, {
+        jStat4.extend(jStat4.chisquare, {
           pdf: function pdf(x2, dof) {
             if (x2 < 0)
               return 0;
-            return x2 === 0 && dof === 2 ? 0.5 : Math2.exp((dof / 2 - 1) * Math2.log(x2) - x2 / 2 - dof / 2 * Math2.log(2) - jStat3.gammaln(dof / 2));
+            return x2 === 0 && dof === 2 ? 0.5 : Math2.exp((dof / 2 - 1) * Math2.log(x2) - x2 / 2 - dof / 2 * Math2.log(2) - jStat4.gammaln(dof / 2));
           },
           cdf: function cdf(x2, dof) {
             if (x2 < 0)
               return 0;
-            return jStat3.lowRegGamma(dof / 2, x2 / 2);
+            return jStat4.lowRegGamma(dof / 2, x2 / 2);
           },
           inv: function(p, dof) {
-            return 2 * jStat3.gammapinv(p, 0.5 * dof);
+            return 2 * jStat4.gammapinv(p, 0.5 * dof);
           },
           mean: function(dof) {
             return dof;
@@ -27597,13 +27597,13 @@ var require_jstat = __commonJS({
             return dof - 2 > 0 ? dof - 2 : 0;
           },
           sample: function sample(dof) {
-            return jStat3.randg(dof / 2) * 2;
+            return jStat4.randg(dof / 2) * 2;
           },
           variance: function variance(dof) {
             return 2 * dof;
           }
         });
-        jStat3.extend(jStat3.exponential, {
+        jStat4.extend(jStat4.exponential, {
           pdf: function pdf(x2, rate) {
             return x2 < 0 ? 0 : rate * Math2.exp(-rate * x2);
           },
@@ -27623,25 +27623,25 @@ var require_jstat = __commonJS({
             return 0;
           },
           sample: function sample(rate) {
-            return -1 / rate * Math2.log(jStat3._random_fn());
+            return -1 / rate * Math2.log(jStat4._random_fn());
           },
           variance: function(rate) {
             return Math2.pow(rate, -2);
           }
         });
-        jStat3.extend(jStat3.gamma, {
+        jStat4.extend(jStat4.gamma, {
           pdf: function pdf(x2, shape, scale) {
             if (x2 < 0)
               return 0;
-            return x2 === 0 && shape === 1 ? 1 / scale : Math2.exp((shape - 1) * Math2.log(x2) - x2 / scale - jStat3.gammaln(shape) - shape * Math2.log(scale));
+            return x2 === 0 && shape === 1 ? 1 / scale : Math2.exp((shape - 1) * Math2.log(x2) - x2 / scale - jStat4.gammaln(shape) - shape * Math2.log(scale));
           },
           cdf: function cdf(x2, shape, scale) {
             if (x2 < 0)
               return 0;
-            return jStat3.lowRegGamma(shape, x2 / scale);
+            return jStat4.lowRegGamma(shape, x2 / scale);
           },
           inv: function(p, shape, scale) {
-            return jStat3.gammapinv(p, shape) * scale;
+            return jStat4.gammapinv(p, shape) * scale;
           },
           mean: function(shape, scale) {
             return shape * scale;
@@ -27651,25 +27651,25 @@ var require_jstat = __commonJS({
             return void 0;
           },
           sample: function sample(shape, scale) {
-            return jStat3.randg(shape) * scale;
+            return jStat4.randg(shape) * scale;
           },
           variance: function variance(shape, scale) {
             return shape * scale * scale;
           }
         });
-        jStat3.extend(jStat3.invgamma, {
+        jStat4.extend(jStat4.invgamma, {
           pdf: function pdf(x2, shape, scale) {
             if (x2 <= 0)
               return 0;
-            return Math2.exp(-(shape + 1) * Math2.log(x2) - scale / x2 - jStat3.gammaln(shape) + shape * Math2.log(scale));
+            return Math2.exp(-(shape + 1) * Math2.log(x2) - scale / x2 - jStat4.gammaln(shape) + shape * Math2.log(scale));
           },
           cdf: function cdf(x2, shape, scale) {
             if (x2 <= 0)
               return 0;
-            return 1 - jStat3.lowRegGamma(shape, scale / x2);
+            return 1 - jStat4.lowRegGamma(shape, scale / x2);
           },
           inv: function(p, shape, scale) {
-            return scale / jStat3.gammapinv(1 - p, shape);
+            return scale / jStat4.gammapinv(1 - p, shape);
           },
           mean: function(shape, scale) {
             return shape > 1 ? scale / (shape - 1) : void 0;
@@ -27678,7 +27678,7 @@ var require_jstat = __commonJS({
             return scale / (shape + 1);
           },
           sample: function sample(shape, scale) {
-            return scale / jStat3.randg(shape);
+            return scale / jStat4.randg(shape);
           },
           variance: function variance(shape, scale) {
             if (shape <= 2)
@@ -27686,7 +27686,7 @@ var require_jstat = __commonJS({
             return scale * scale / ((shape - 1) * (shape - 1) * (shape - 2));
           }
         });
-        jStat3.extend(jStat3.kumaraswamy, {
+        jStat4.extend(jStat4.kumaraswamy, {
           pdf: function pdf(x2, alpha, beta) {
             if (x2 === 0 && alpha === 1)
               return beta;
@@ -27705,7 +27705,7 @@ var require_jstat = __commonJS({
             return Math2.pow(1 - Math2.pow(1 - p, 1 / beta), 1 / alpha);
           },
           mean: function(alpha, beta) {
-            return beta * jStat3.gammafn(1 + 1 / alpha) * jStat3.gammafn(beta) / jStat3.gammafn(1 + 1 / alpha + beta);
+            return beta * jStat4.gammafn(1 + 1 / alpha) * jStat4.gammafn(beta) / jStat4.gammafn(1 + 1 / alpha + beta);
           },
           median: function median(alpha, beta) {
             return Math2.pow(1 - Math2.pow(2, -1 / beta), 1 / alpha);
@@ -27719,7 +27719,7 @@ var require_jstat = __commonJS({
             throw new Error("variance not yet implemented");
           }
         });
-        jStat3.extend(jStat3.lognormal, {
+        jStat4.extend(jStat4.lognormal, {
           pdf: function pdf(x2, mu, sigma) {
             if (x2 <= 0)
               return 0;
@@ -27728,10 +27728,10 @@ var require_jstat = __commonJS({
           cdf: function cdf(x2, mu, sigma) {
             if (x2 < 0)
               return 0;
-            return 0.5 + 0.5 * jStat3.erf((Math2.log(x2) - mu) / Math2.sqrt(2 * sigma * sigma));
+            return 0.5 + 0.5 * jStat4.erf((Math2.log(x2) - mu) / Math2.sqrt(2 * sigma * sigma));
           },
           inv: function(p, mu, sigma) {
-            return Math2.exp(-1.4142135623730951 * sigma * jStat3.erfcinv(2 * p) + mu);
+            return Math2.exp(-1.4142135623730951 * sigma * jStat4.erfcinv(2 * p) + mu);
           },
           mean: function mean2(mu, sigma) {
             return Math2.exp(mu + sigma * sigma / 2);
@@ -27743,61 +27743,61 @@ var require_jstat = __commonJS({
             return Math2.exp(mu - sigma * sigma);
           },
           sample: function sample(mu, sigma) {
-            return Math2.exp(jStat3.randn() * sigma + mu);
+            return Math2.exp(jStat4.randn() * sigma + mu);
           },
           variance: function variance(mu, sigma) {
             return (Math2.exp(sigma * sigma) - 1) * Math2.exp(2 * mu + sigma * sigma);
           }
         });
-        jStat3.extend(jStat3.noncentralt, {
+        jStat4.extend(jStat4.noncentralt, {
           pdf: function pdf(x2, dof, ncp) {
             var tol = 1e-14;
             if (Math2.abs(ncp) < tol)
-              return jStat3.studentt.pdf(x2, dof);
+              return jStat4.studentt.pdf(x2, dof);
             if (Math2.abs(x2) < tol) {
-              return Math2.exp(jStat3.gammaln((dof + 1) / 2) - ncp * ncp / 2 - 0.5 * Math2.log(Math2.PI * dof) - jStat3.gammaln(dof / 2));
+              return Math2.exp(jStat4.gammaln((dof + 1) / 2) - ncp * ncp / 2 - 0.5 * Math2.log(Math2.PI * dof) - jStat4.gammaln(dof / 2));
             }
-            return dof / x2 * (jStat3.noncentralt.cdf(x2 * Math2.sqrt(1 + 2 / dof), dof + 2, ncp) - jStat3.noncentralt.cdf(x2, dof, ncp));
+            return dof / x2 * (jStat4.noncentralt.cdf(x2 * Math2.sqrt(1 + 2 / dof), dof + 2, ncp) - jStat4.noncentralt.cdf(x2, dof, ncp));
           },
           cdf: function cdf(x2, dof, ncp) {
             var tol = 1e-14;
             var min_iterations = 200;
             if (Math2.abs(ncp) < tol)
-              return jStat3.studentt.cdf(x2, dof);
+              return jStat4.studentt.cdf(x2, dof);
             var flip = false;
             if (x2 < 0) {
               flip = true;
               ncp = -ncp;
             }
-            var prob = jStat3.normal.cdf(-ncp, 0, 1);
+            var prob = jStat4.normal.cdf(-ncp, 0, 1);
             var value = tol + 1;
             var lastvalue = value;
             var y = x2 * x2 / (x2 * x2 + dof);
             var j = 0;
             var p = Math2.exp(-ncp * ncp / 2);
-            var q = Math2.exp(-ncp * ncp / 2 - 0.5 * Math2.log(2) - jStat3.gammaln(3 / 2)) * ncp;
+            var q = Math2.exp(-ncp * ncp / 2 - 0.5 * Math2.log(2) - jStat4.gammaln(3 / 2)) * ncp;
             while (j < min_iterations || lastvalue > tol || value > tol) {
               lastvalue = value;
               if (j > 0) {
                 p *= ncp * ncp / (2 * j);
                 q *= ncp * ncp / (2 * (j + 1 / 2));
               }
-              value = p * jStat3.beta.cdf(y, j + 0.5, dof / 2) + q * jStat3.beta.cdf(y, j + 1, dof / 2);
+              value = p * jStat4.beta.cdf(y, j + 0.5, dof / 2) + q * jStat4.beta.cdf(y, j + 1, dof / 2);
               prob += 0.5 * value;
               j++;
             }
             return flip ? 1 - prob : prob;
           }
         });
-        jStat3.extend(jStat3.normal, {
+        jStat4.extend(jStat4.normal, {
           pdf: function pdf(x2, mean2, std) {
             return Math2.exp(-0.5 * Math2.log(2 * Math2.PI) - Math2.log(std) - Math2.pow(x2 - mean2, 2) / (2 * std * std));
           },
           cdf: function cdf(x2, mean2, std) {
-            return 0.5 * (1 + jStat3.erf((x2 - mean2) / Math2.sqrt(2 * std * std)));
+            return 0.5 * (1 + jStat4.erf((x2 - mean2) / Math2.sqrt(2 * std * std)));
           },
           inv: function(p, mean2, std) {
-            return -1.4142135623730951 * std * jStat3.erfcinv(2 * p) + mean2;
+            return -1.4142135623730951 * std * jStat4.erfcinv(2 * p) + mean2;
           },
           mean: function(mean2) {
             return mean2;
@@ -27809,13 +27809,13 @@ var require_jstat = __commonJS({
             return mean2;
           },
           sample: function sample(mean2, std) {
-            return jStat3.randn() * std + mean2;
+            return jStat4.randn() * std + mean2;
           },
           variance: function(mean2, std) {
             return std * std;
           }
         });
-        jStat3.extend(jStat3.pareto, {
+        jStat4.extend(jStat4.pareto, {
           pdf: function pdf(x2, scale, shape) {
             if (x2 < scale)
               return 0;
@@ -27846,17 +27846,17 @@ var require_jstat = __commonJS({
             return scale * scale * shape / (Math2.pow(shape - 1, 2) * (shape - 2));
           }
         });
-        jStat3.extend(jStat3.studentt, {
+        jStat4.extend(jStat4.studentt, {
           pdf: function pdf(x2, dof) {
             dof = dof > 1e100 ? 1e100 : dof;
-            return 1 / (Math2.sqrt(dof) * jStat3.betafn(0.5, dof / 2)) * Math2.pow(1 + x2 * x2 / dof, -((dof + 1) / 2));
+            return 1 / (Math2.sqrt(dof) * jStat4.betafn(0.5, dof / 2)) * Math2.pow(1 + x2 * x2 / dof, -((dof + 1) / 2));
           },
           cdf: function cdf(x2, dof) {
             var dof2 = dof / 2;
-            return jStat3.ibeta((x2 + Math2.sqrt(x2 * x2 + dof)) / (2 * Math2.sqrt(x2 * x2 + dof)), dof2, dof2);
+            return jStat4.ibeta((x2 + Math2.sqrt(x2 * x2 + dof)) / (2 * Math2.sqrt(x2 * x2 + dof)), dof2, dof2);
           },
           inv: function(p, dof) {
-            var x2 = jStat3.ibetainv(2 * Math2.min(p, 1 - p), 0.5 * dof, 0.5);
+            var x2 = jStat4.ibetainv(2 * Math2.min(p, 1 - p), 0.5 * dof, 0.5);
             x2 = Math2.sqrt(dof * (1 - x2) / x2);
             return p > 0.5 ? x2 : -x2;
           },
@@ -27870,13 +27870,13 @@ var require_jstat = __commonJS({
             return 0;
           },
           sample: function sample(dof) {
-            return jStat3.randn() * Math2.sqrt(dof / (2 * jStat3.randg(dof / 2)));
+            return jStat4.randn() * Math2.sqrt(dof / (2 * jStat4.randg(dof / 2)));
           },
           variance: function variance(dof) {
             return dof > 2 ? dof / (dof - 2) : dof > 1 ? Infinity : void 0;
           }
         });
-        jStat3.extend(jStat3.weibull, {
+        jStat4.extend(jStat4.weibull, {
           pdf: function pdf(x2, scale, shape) {
             if (x2 < 0 || scale < 0 || shape < 0)
               return 0;
@@ -27889,7 +27889,7 @@ var require_jstat = __commonJS({
             return scale * Math2.pow(-Math2.log(1 - p), 1 / shape);
           },
           mean: function(scale, shape) {
-            return scale * jStat3.gammafn(1 + 1 / shape);
+            return scale * jStat4.gammafn(1 + 1 / shape);
           },
           median: function median(scale, shape) {
             return scale * Math2.pow(Math2.log(2), 1 / shape);
@@ -27900,13 +27900,13 @@ var require_jstat = __commonJS({
             return scale * Math2.pow((shape - 1) / shape, 1 / shape);
           },
           sample: function sample(scale, shape) {
-            return scale * Math2.pow(-Math2.log(jStat3._random_fn()), 1 / shape);
+            return scale * Math2.pow(-Math2.log(jStat4._random_fn()), 1 / shape);
           },
           variance: function variance(scale, shape) {
-            return scale * scale * jStat3.gammafn(1 + 2 / shape) - Math2.pow(jStat3.weibull.mean(scale, shape), 2);
+            return scale * scale * jStat4.gammafn(1 + 2 / shape) - Math2.pow(jStat4.weibull.mean(scale, shape), 2);
           }
         });
-        jStat3.extend(jStat3.uniform, {
+        jStat4.extend(jStat4.uniform, {
           pdf: function pdf(x2, a, b) {
             return x2 < a || x2 > b ? 0 : 1 / (b - a);
           },
@@ -27924,13 +27924,13 @@ var require_jstat = __commonJS({
             return 0.5 * (a + b);
           },
           median: function median(a, b) {
-            return jStat3.mean(a, b);
+            return jStat4.mean(a, b);
           },
           mode: function mode() {
             throw new Error("mode is not yet implemented");
           },
           sample: function sample(a, b) {
-            return a / 2 + b / 2 + (b / 2 - a / 2) * (2 * jStat3._random_fn() - 1);
+            return a / 2 + b / 2 + (b / 2 - a / 2) * (2 * jStat4._random_fn() - 1);
           },
           variance: function variance(a, b) {
             return Math2.pow(b - a, 2) / 12;
@@ -27960,9 +27960,9 @@ var require_jstat = __commonJS({
           }
           return a1 / a;
         }
-        jStat3.extend(jStat3.binomial, {
+        jStat4.extend(jStat4.binomial, {
           pdf: function pdf(k, n, p) {
-            return p === 0 || p === 1 ? n * p === k ? 1 : 0 : jStat3.combination(n, k) * Math2.pow(p, k) * Math2.pow(1 - p, n - k);
+            return p === 0 || p === 1 ? n * p === k ? 1 : 0 : jStat4.combination(n, k) * Math2.pow(p, k) * Math2.pow(1 - p, n - k);
           },
           cdf: function cdf(x2, n, p) {
             var betacdf;
@@ -27978,7 +27978,7 @@ var require_jstat = __commonJS({
             var a = x2 + 1;
             var b = n - x2;
             var s = a + b;
-            var bt = Math2.exp(jStat3.gammaln(s) - jStat3.gammaln(b) - jStat3.gammaln(a) + a * Math2.log(z) + b * Math2.log(1 - z));
+            var bt = Math2.exp(jStat4.gammaln(s) - jStat4.gammaln(b) - jStat4.gammaln(a) + a * Math2.log(z) + b * Math2.log(1 - z));
             if (z < (a + 1) / (s + 2))
               betacdf = bt * betinc(z, a, b, eps);
             else
@@ -27986,24 +27986,24 @@ var require_jstat = __commonJS({
             return Math2.round((1 - betacdf) * (1 / eps)) / (1 / eps);
           }
         });
-        jStat3.extend(jStat3.negbin, {
+        jStat4.extend(jStat4.negbin, {
           pdf: function pdf(k, r, p) {
             if (k !== k >>> 0)
               return false;
             if (k < 0)
               return 0;
-            return jStat3.combination(k + r - 1, r - 1) * Math2.pow(1 - p, k) * Math2.pow(p, r);
+            return jStat4.combination(k + r - 1, r - 1) * Math2.pow(1 - p, k) * Math2.pow(p, r);
           },
           cdf: function cdf(x2, r, p) {
             var sum = 0, k = 0;
             if (x2 < 0) return 0;
             for (; k <= x2; k++) {
-              sum += jStat3.negbin.pdf(k, r, p);
+              sum += jStat4.negbin.pdf(k, r, p);
             }
             return sum;
           }
         });
-        jStat3.extend(jStat3.hypgeom, {
+        jStat4.extend(jStat4.hypgeom, {
           pdf: function pdf(k, N, m, n) {
             if (k !== k | 0) {
               return false;
@@ -28013,14 +28013,14 @@ var require_jstat = __commonJS({
               return 0;
             } else if (m * 2 > N) {
               if (n * 2 > N) {
-                return jStat3.hypgeom.pdf(N - m - n + k, N, N - m, N - n);
+                return jStat4.hypgeom.pdf(N - m - n + k, N, N - m, N - n);
               } else {
-                return jStat3.hypgeom.pdf(n - k, N, N - m, n);
+                return jStat4.hypgeom.pdf(n - k, N, N - m, n);
               }
             } else if (n * 2 > N) {
-              return jStat3.hypgeom.pdf(m - k, N, m, N - n);
+              return jStat4.hypgeom.pdf(m - k, N, m, N - n);
             } else if (m < n) {
-              return jStat3.hypgeom.pdf(k, N, n, m);
+              return jStat4.hypgeom.pdf(k, N, n, m);
             } else {
               var scaledPDF = 1;
               var samplesDone = 0;
@@ -28044,14 +28044,14 @@ var require_jstat = __commonJS({
               return 1;
             } else if (m * 2 > N) {
               if (n * 2 > N) {
-                return jStat3.hypgeom.cdf(N - m - n + x2, N, N - m, N - n);
+                return jStat4.hypgeom.cdf(N - m - n + x2, N, N - m, N - n);
               } else {
-                return 1 - jStat3.hypgeom.cdf(n - x2 - 1, N, N - m, n);
+                return 1 - jStat4.hypgeom.cdf(n - x2 - 1, N, N - m, n);
               }
             } else if (n * 2 > N) {
-              return 1 - jStat3.hypgeom.cdf(m - x2 - 1, N, m, N - n);
+              return 1 - jStat4.hypgeom.cdf(m - x2 - 1, N, m, N - n);
             } else if (m < n) {
-              return jStat3.hypgeom.cdf(x2, N, n, m);
+              return jStat4.hypgeom.cdf(x2, N, n, m);
             } else {
               var scaledCDF = 1;
               var scaledPDF = 1;
@@ -28073,20 +28073,20 @@ var require_jstat = __commonJS({
             }
           }
         });
-        jStat3.extend(jStat3.poisson, {
+        jStat4.extend(jStat4.poisson, {
           pdf: function pdf(k, l) {
             if (l < 0 || k % 1 !== 0 || k < 0) {
               return 0;
             }
-            return Math2.pow(l, k) * Math2.exp(-l) / jStat3.factorial(k);
+            return Math2.pow(l, k) * Math2.exp(-l) / jStat4.factorial(k);
           },
           cdf: function cdf(x2, l) {
             var sumarr = [], k = 0;
             if (x2 < 0) return 0;
             for (; k <= x2; k++) {
-              sumarr.push(jStat3.poisson.pdf(k, l));
+              sumarr.push(jStat4.poisson.pdf(k, l));
             }
-            return jStat3.sum(sumarr);
+            return jStat4.sum(sumarr);
           },
           mean: function(l) {
             return l;
@@ -28098,7 +28098,7 @@ var require_jstat = __commonJS({
             var p = 1, k = 0, L = Math2.exp(-l);
             do {
               k++;
-              p *= jStat3._random_fn();
+              p *= jStat4._random_fn();
             } while (p > L);
             return k - 1;
           },
@@ -28123,7 +28123,7 @@ var require_jstat = __commonJS({
               if (k < 0 || us < 0.013 && V > us) {
                 continue;
               }
-              if (Math2.log(V) + Math2.log(invalpha) - Math2.log(a / (us * us) + b) <= -lam + k * loglam - jStat3.loggam(k + 1)) {
+              if (Math2.log(V) + Math2.log(invalpha) - Math2.log(a / (us * us) + b) <= -lam + k * loglam - jStat4.loggam(k + 1)) {
                 return k;
               }
             }
@@ -28135,7 +28135,7 @@ var require_jstat = __commonJS({
               return this.sampleLarge(l);
           }
         });
-        jStat3.extend(jStat3.triangular, {
+        jStat4.extend(jStat4.triangular, {
           pdf: function pdf(x2, a, b, c) {
             if (b <= a || c < a || c > b) {
               return NaN;
@@ -28188,7 +28188,7 @@ var require_jstat = __commonJS({
             return c;
           },
           sample: function sample(a, b, c) {
-            var u = jStat3._random_fn();
+            var u = jStat4._random_fn();
             if (u < (c - a) / (b - a))
               return a + Math2.sqrt(u * (b - a) * (c - a));
             return b - Math2.sqrt((1 - u) * (b - a) * (b - c));
@@ -28197,7 +28197,7 @@ var require_jstat = __commonJS({
             return (a * a + b * b + c * c - a * b - a * c - b * c) / 18;
           }
         });
-        jStat3.extend(jStat3.arcsine, {
+        jStat4.extend(jStat4.arcsine, {
           pdf: function pdf(x2, a, b) {
             if (b <= a) return NaN;
             return x2 <= a || x2 >= b ? 0 : 2 / Math2.PI * Math2.pow(Math2.pow(b - a, 2) - Math2.pow(2 * x2 - a - b, 2), -0.5);
@@ -28224,7 +28224,7 @@ var require_jstat = __commonJS({
             throw new Error("mode is not yet implemented");
           },
           sample: function sample(a, b) {
-            return (a + b) / 2 + (b - a) / 2 * Math2.sin(2 * Math2.PI * jStat3.uniform.sample(0, 1));
+            return (a + b) / 2 + (b - a) / 2 * Math2.sin(2 * Math2.PI * jStat4.uniform.sample(0, 1));
           },
           variance: function variance(a, b) {
             if (b <= a) return NaN;
@@ -28234,7 +28234,7 @@ var require_jstat = __commonJS({
         function laplaceSign(x2) {
           return x2 / Math2.abs(x2);
         }
-        jStat3.extend(jStat3.laplace, {
+        jStat4.extend(jStat4.laplace, {
           pdf: function pdf(x2, mu, b) {
             return b <= 0 ? 0 : Math2.exp(-Math2.abs(x2 - mu) / b) / (2 * b);
           },
@@ -28261,7 +28261,7 @@ var require_jstat = __commonJS({
             return 2 * b * b;
           },
           sample: function sample(mu, b) {
-            var u = jStat3._random_fn() - 0.5;
+            var u = jStat4._random_fn() - 0.5;
             return mu - b * laplaceSign(u) * Math2.log(1 - 2 * Math2.abs(u));
           }
         });
@@ -28294,7 +28294,7 @@ var require_jstat = __commonJS({
           var qsqz = w * 0.5;
           if (qsqz >= bb)
             return 1;
-          var pr_w = 2 * jStat3.normal.cdf(qsqz, 0, 1, 1, 0) - 1;
+          var pr_w = 2 * jStat4.normal.cdf(qsqz, 0, 1, 1, 0) - 1;
           if (pr_w >= Math2.exp(C2 / cc))
             pr_w = Math2.pow(pr_w, cc);
           else
@@ -28327,8 +28327,8 @@ var require_jstat = __commonJS({
               var qexpo = ac * ac;
               if (qexpo > C3)
                 break;
-              var pplus = 2 * jStat3.normal.cdf(ac, 0, 1, 1, 0);
-              var pminus = 2 * jStat3.normal.cdf(ac, w, 1, 1, 0);
+              var pplus = 2 * jStat4.normal.cdf(ac, 0, 1, 1, 0);
+              var pminus = 2 * jStat4.normal.cdf(ac, w, 1, 1, 0);
               var rinsum = pplus * 0.5 - pminus * 0.5;
               if (rinsum >= Math2.exp(C1 / cc1)) {
                 rinsum = aleg[j - 1] * Math2.exp(-(0.5 * qexpo)) * Math2.pow(rinsum, cc1);
@@ -28373,7 +28373,7 @@ var require_jstat = __commonJS({
           if (v < vmax) q += -c3 / v + c4 * t / v;
           return t * (q * Math2.log(c - 1) + c5);
         }
-        jStat3.extend(jStat3.tukey, {
+        jStat4.extend(jStat4.tukey, {
           cdf: function cdf(q, nmeans, df) {
             var rr = 1;
             var cc = nmeans;
@@ -28417,7 +28417,7 @@ var require_jstat = __commonJS({
             if (df > dlarg)
               return tukeyWprob(q, rr, cc);
             var f2 = df * 0.5;
-            var f2lf = f2 * Math2.log(df) - df * Math2.log(2) - jStat3.gammaln(f2);
+            var f2lf = f2 * Math2.log(df) - df * Math2.log(2) - jStat4.gammaln(f2);
             var f21 = f2 - 1;
             var ff4 = df * 0.25;
             var ulen;
@@ -28472,13 +28472,13 @@ var require_jstat = __commonJS({
             if (p === 0) return 0;
             if (p === 1) return Infinity;
             var x0 = tukeyQinv(p, cc, df);
-            var valx0 = jStat3.tukey.cdf(x0, nmeans, df) - p;
+            var valx0 = jStat4.tukey.cdf(x0, nmeans, df) - p;
             var x1;
             if (valx0 > 0)
               x1 = Math2.max(0, x0 - 1);
             else
               x1 = x0 + 1;
-            var valx1 = jStat3.tukey.cdf(x1, nmeans, df) - p;
+            var valx1 = jStat4.tukey.cdf(x1, nmeans, df) - p;
             var ans;
             for (var iter = 1; iter < maxiter; iter++) {
               ans = x1 - valx1 * (x1 - x0) / (valx1 - valx0);
@@ -28488,7 +28488,7 @@ var require_jstat = __commonJS({
                 ans = 0;
                 valx1 = -p;
               }
-              valx1 = jStat3.tukey.cdf(ans, nmeans, df) - p;
+              valx1 = jStat4.tukey.cdf(ans, nmeans, df) - p;
               x1 = ans;
               var xabs = Math2.abs(x1 - x0);
               if (xabs < eps)
@@ -28497,23 +28497,23 @@ var require_jstat = __commonJS({
             throw new Error("tukey.inv failed to converge");
           }
         });
-      })(jStat2, Math);
-      (function(jStat3, Math2) {
+      })(jStat3, Math);
+      (function(jStat4, Math2) {
         var push = Array.prototype.push;
-        var isArray = jStat3.utils.isArray;
+        var isArray = jStat4.utils.isArray;
         function isUsable(arg) {
-          return isArray(arg) || arg instanceof jStat3;
+          return isArray(arg) || arg instanceof jStat4;
         }
-        jStat3.extend({
+        jStat4.extend({
           // add a vector/matrix to a vector/matrix or scalar
           add: function add(arr, arg) {
             if (isUsable(arg)) {
               if (!isUsable(arg[0])) arg = [arg];
-              return jStat3.map(arr, function(value, row, col) {
+              return jStat4.map(arr, function(value, row, col) {
                 return value + arg[row][col];
               });
             }
-            return jStat3.map(arr, function(value) {
+            return jStat4.map(arr, function(value) {
               return value + arg;
             });
           },
@@ -28521,11 +28521,11 @@ var require_jstat = __commonJS({
           subtract: function subtract(arr, arg) {
             if (isUsable(arg)) {
               if (!isUsable(arg[0])) arg = [arg];
-              return jStat3.map(arr, function(value, row, col) {
+              return jStat4.map(arr, function(value, row, col) {
                 return value - arg[row][col] || 0;
               });
             }
-            return jStat3.map(arr, function(value) {
+            return jStat4.map(arr, function(value) {
               return value - arg;
             });
           },
@@ -28533,9 +28533,9 @@ var require_jstat = __commonJS({
           divide: function divide(arr, arg) {
             if (isUsable(arg)) {
               if (!isUsable(arg[0])) arg = [arg];
-              return jStat3.multiply(arr, jStat3.inv(arg));
+              return jStat4.multiply(arr, jStat4.inv(arg));
             }
-            return jStat3.map(arr, function(value) {
+            return jStat4.map(arr, function(value) {
               return value / arg;
             });
           },
@@ -28545,7 +28545,7 @@ var require_jstat = __commonJS({
             if (arr.length === void 0 && arg.length === void 0) {
               return arr * arg;
             }
-            nrow = arr.length, ncol = arr[0].length, res = jStat3.zeros(nrow, nrescols = isUsable(arg) ? arg[0].length : ncol), rescols = 0;
+            nrow = arr.length, ncol = arr[0].length, res = jStat4.zeros(nrow, nrescols = isUsable(arg) ? arg[0].length : ncol), rescols = 0;
             if (isUsable(arg)) {
               for (; rescols < nrescols; rescols++) {
                 for (row = 0; row < nrow; row++) {
@@ -28557,7 +28557,7 @@ var require_jstat = __commonJS({
               }
               return nrow === 1 && rescols === 1 ? res[0][0] : res;
             }
-            return jStat3.map(arr, function(value) {
+            return jStat4.map(arr, function(value) {
               return value * arg;
             });
           },
@@ -28567,7 +28567,7 @@ var require_jstat = __commonJS({
           // ->
           // [[4,5,6],[8,10,12],[12,15,18]]
           outer: function outer(A, B) {
-            return jStat3.multiply(A.map(function(t) {
+            return jStat4.multiply(A.map(function(t) {
               return [t];
             }), [B]);
           },
@@ -28575,7 +28575,7 @@ var require_jstat = __commonJS({
           dot: function dot(arr, arg) {
             if (!isUsable(arr[0])) arr = [arr];
             if (!isUsable(arg[0])) arg = [arg];
-            var left = arr[0].length === 1 && arr.length !== 1 ? jStat3.transpose(arr) : arr, right = arg[0].length === 1 && arg.length !== 1 ? jStat3.transpose(arg) : arg, res = [], row = 0, nrow = left.length, ncol = left[0].length, sum, col;
+            var left = arr[0].length === 1 && arr.length !== 1 ? jStat4.transpose(arr) : arr, right = arg[0].length === 1 && arg.length !== 1 ? jStat4.transpose(arg) : arg, res = [], row = 0, nrow = left.length, ncol = left[0].length, sum, col;
             for (; row < nrow; row++) {
               res[row] = [];
               sum = 0;
@@ -28587,25 +28587,25 @@ var require_jstat = __commonJS({
           },
           // raise every element by a scalar
           pow: function pow(arr, arg) {
-            return jStat3.map(arr, function(value) {
+            return jStat4.map(arr, function(value) {
               return Math2.pow(value, arg);
             });
           },
           // exponentiate every element
           exp: function exp(arr) {
-            return jStat3.map(arr, function(value) {
+            return jStat4.map(arr, function(value) {
               return Math2.exp(value);
             });
           },
           // generate the natural log of every element
           log: function exp(arr) {
-            return jStat3.map(arr, function(value) {
+            return jStat4.map(arr, function(value) {
               return Math2.log(value);
             });
           },
           // generate the absolute values of the vector
           abs: function abs(arr) {
-            return jStat3.map(arr, function(value) {
+            return jStat4.map(arr, function(value) {
               return Math2.abs(value);
             });
           },
@@ -28623,7 +28623,7 @@ var require_jstat = __commonJS({
           // computes the angle between two vectors in rads
           // In case a matrix is passed, this uses the first row as the vector
           angle: function angle(arr, arg) {
-            return Math2.acos(jStat3.dot(arr, arg) / (jStat3.norm(arr) * jStat3.norm(arg)));
+            return Math2.acos(jStat4.dot(arr, arg) / (jStat4.norm(arr) * jStat4.norm(arg)));
           },
           // augment one matrix by another
           // Note: this function returns a matrix, not a jStat object
@@ -28644,8 +28644,8 @@ var require_jstat = __commonJS({
           inv: function inv(a) {
             var rows = a.length;
             var cols = a[0].length;
-            var b = jStat3.identity(rows, cols);
-            var c = jStat3.gauss_jordan(a, b);
+            var b = jStat4.identity(rows, cols);
+            var c = jStat4.gauss_jordan(a, b);
             var result = [];
             var i2 = 0;
             var j;
@@ -28681,7 +28681,7 @@ var require_jstat = __commonJS({
           },
           gauss_elimination: function gauss_elimination(a, b) {
             var i2 = 0, j = 0, n = a.length, m = a[0].length, factor = 1, sum = 0, x2 = [], maug, pivot, temp, k;
-            a = jStat3.aug(a, b);
+            a = jStat4.aug(a, b);
             maug = a[0].length;
             for (i2 = 0; i2 < n; i2++) {
               pivot = a[i2][i2];
@@ -28716,7 +28716,7 @@ var require_jstat = __commonJS({
             return x2;
           },
           gauss_jordan: function gauss_jordan(a, b) {
-            var m = jStat3.aug(a, b);
+            var m = jStat4.aug(a, b);
             var h = m.length;
             var w = m[0].length;
             var c = 0;
@@ -28763,7 +28763,7 @@ var require_jstat = __commonJS({
           // will return [[2.666],[0.1666],[1.666]]
           triaUpSolve: function triaUpSolve(A, b) {
             var size = A[0].length;
-            var x2 = jStat3.zeros(1, size)[0];
+            var x2 = jStat4.zeros(1, size)[0];
             var parts;
             var matrix_mode = false;
             if (b[0].length != void 0) {
@@ -28772,11 +28772,11 @@ var require_jstat = __commonJS({
               });
               matrix_mode = true;
             }
-            jStat3.arange(size - 1, -1, -1).forEach(function(i2) {
-              parts = jStat3.arange(i2 + 1, size).map(function(j) {
+            jStat4.arange(size - 1, -1, -1).forEach(function(i2) {
+              parts = jStat4.arange(i2 + 1, size).map(function(j) {
                 return x2[j] * A[i2][j];
               });
-              x2[i2] = (b[i2] - jStat3.sum(parts)) / A[i2][i2];
+              x2[i2] = (b[i2] - jStat4.sum(parts)) / A[i2][i2];
             });
             if (matrix_mode)
               return x2.map(function(i2) {
@@ -28786,7 +28786,7 @@ var require_jstat = __commonJS({
           },
           triaLowSolve: function triaLowSolve(A, b) {
             var size = A[0].length;
-            var x2 = jStat3.zeros(1, size)[0];
+            var x2 = jStat4.zeros(1, size)[0];
             var parts;
             var matrix_mode = false;
             if (b[0].length != void 0) {
@@ -28795,11 +28795,11 @@ var require_jstat = __commonJS({
               });
               matrix_mode = true;
             }
-            jStat3.arange(size).forEach(function(i2) {
-              parts = jStat3.arange(i2).map(function(j) {
+            jStat4.arange(size).forEach(function(i2) {
+              parts = jStat4.arange(i2).map(function(j) {
                 return A[i2][j] * x2[j];
               });
-              x2[i2] = (b[i2] - jStat3.sum(parts)) / A[i2][i2];
+              x2[i2] = (b[i2] - jStat4.sum(parts)) / A[i2][i2];
             });
             if (matrix_mode)
               return x2.map(function(i2) {
@@ -28813,24 +28813,24 @@ var require_jstat = __commonJS({
           // U is upper triangular matrix
           lu: function lu(A) {
             var size = A.length;
-            var L = jStat3.identity(size);
-            var R = jStat3.zeros(A.length, A[0].length);
+            var L = jStat4.identity(size);
+            var R = jStat4.zeros(A.length, A[0].length);
             var parts;
-            jStat3.arange(size).forEach(function(t) {
+            jStat4.arange(size).forEach(function(t) {
               R[0][t] = A[0][t];
             });
-            jStat3.arange(1, size).forEach(function(l) {
-              jStat3.arange(l).forEach(function(i2) {
-                parts = jStat3.arange(i2).map(function(jj) {
+            jStat4.arange(1, size).forEach(function(l) {
+              jStat4.arange(l).forEach(function(i2) {
+                parts = jStat4.arange(i2).map(function(jj) {
                   return L[l][jj] * R[jj][i2];
                 });
-                L[l][i2] = (A[l][i2] - jStat3.sum(parts)) / R[i2][i2];
+                L[l][i2] = (A[l][i2] - jStat4.sum(parts)) / R[i2][i2];
               });
-              jStat3.arange(l, size).forEach(function(j) {
-                parts = jStat3.arange(l).map(function(jj) {
+              jStat4.arange(l, size).forEach(function(j) {
+                parts = jStat4.arange(l).map(function(jj) {
                   return L[l][jj] * R[jj][j];
                 });
-                R[l][j] = A[parts.length][j] - jStat3.sum(parts);
+                R[l][j] = A[parts.length][j] - jStat4.sum(parts);
               });
             });
             return [L, R];
@@ -28840,18 +28840,18 @@ var require_jstat = __commonJS({
           // T is lower triangular matrix
           cholesky: function cholesky(A) {
             var size = A.length;
-            var T = jStat3.zeros(A.length, A[0].length);
+            var T = jStat4.zeros(A.length, A[0].length);
             var parts;
-            jStat3.arange(size).forEach(function(i2) {
-              parts = jStat3.arange(i2).map(function(t) {
+            jStat4.arange(size).forEach(function(i2) {
+              parts = jStat4.arange(i2).map(function(t) {
                 return Math2.pow(T[i2][t], 2);
               });
-              T[i2][i2] = Math2.sqrt(A[i2][i2] - jStat3.sum(parts));
-              jStat3.arange(i2 + 1, size).forEach(function(j) {
-                parts = jStat3.arange(i2).map(function(t) {
+              T[i2][i2] = Math2.sqrt(A[i2][i2] - jStat4.sum(parts));
+              jStat4.arange(i2 + 1, size).forEach(function(j) {
+                parts = jStat4.arange(i2).map(function(t) {
                   return T[i2][t] * T[j][t];
                 });
-                T[j][i2] = (A[i2][j] - jStat3.sum(parts)) / T[i2][i2];
+                T[j][i2] = (A[i2][j] - jStat4.sum(parts)) / T[i2][i2];
               });
             });
             return T;
@@ -28881,14 +28881,14 @@ var require_jstat = __commonJS({
                 }
               }
             }
-            h = jStat3.multiply(jStat3.multiply(jStat3.inv(d), jStat3.add(l, u)), -1);
-            c = jStat3.multiply(jStat3.inv(d), b);
+            h = jStat4.multiply(jStat4.multiply(jStat4.inv(d), jStat4.add(l, u)), -1);
+            c = jStat4.multiply(jStat4.inv(d), b);
             xv = x2;
-            xk = jStat3.add(jStat3.multiply(h, x2), c);
+            xk = jStat4.add(jStat4.multiply(h, x2), c);
             i2 = 2;
-            while (Math2.abs(jStat3.norm(jStat3.subtract(xk, xv))) > r) {
+            while (Math2.abs(jStat4.norm(jStat4.subtract(xk, xv))) > r) {
               xv = xk;
-              xk = jStat3.add(jStat3.multiply(h, xv), c);
+              xk = jStat4.add(jStat4.multiply(h, xv), c);
               i2++;
             }
             return xk;
@@ -28917,14 +28917,14 @@ var require_jstat = __commonJS({
                 }
               }
             }
-            h = jStat3.multiply(jStat3.multiply(jStat3.inv(jStat3.add(d, l)), u), -1);
-            c = jStat3.multiply(jStat3.inv(jStat3.add(d, l)), b);
+            h = jStat4.multiply(jStat4.multiply(jStat4.inv(jStat4.add(d, l)), u), -1);
+            c = jStat4.multiply(jStat4.inv(jStat4.add(d, l)), b);
             xv = x2;
-            xk = jStat3.add(jStat3.multiply(h, x2), c);
+            xk = jStat4.add(jStat4.multiply(h, x2), c);
             i2 = 2;
-            while (Math2.abs(jStat3.norm(jStat3.subtract(xk, xv))) > r) {
+            while (Math2.abs(jStat4.norm(jStat4.subtract(xk, xv))) > r) {
               xv = xk;
-              xk = jStat3.add(jStat3.multiply(h, xv), c);
+              xk = jStat4.add(jStat4.multiply(h, xv), c);
               i2 = i2 + 1;
             }
             return xk;
@@ -28953,23 +28953,23 @@ var require_jstat = __commonJS({
                 }
               }
             }
-            h = jStat3.multiply(
-              jStat3.inv(jStat3.add(d, jStat3.multiply(l, w))),
-              jStat3.subtract(
-                jStat3.multiply(d, 1 - w),
-                jStat3.multiply(u, w)
+            h = jStat4.multiply(
+              jStat4.inv(jStat4.add(d, jStat4.multiply(l, w))),
+              jStat4.subtract(
+                jStat4.multiply(d, 1 - w),
+                jStat4.multiply(u, w)
               )
             );
-            c = jStat3.multiply(jStat3.multiply(jStat3.inv(jStat3.add(
+            c = jStat4.multiply(jStat4.multiply(jStat4.inv(jStat4.add(
               d,
-              jStat3.multiply(l, w)
+              jStat4.multiply(l, w)
             )), b), w);
             xv = x2;
-            xk = jStat3.add(jStat3.multiply(h, x2), c);
+            xk = jStat4.add(jStat4.multiply(h, x2), c);
             i2 = 2;
-            while (Math2.abs(jStat3.norm(jStat3.subtract(xk, xv))) > r) {
+            while (Math2.abs(jStat4.norm(jStat4.subtract(xk, xv))) > r) {
               xv = xk;
-              xk = jStat3.add(jStat3.multiply(h, xv), c);
+              xk = jStat4.add(jStat4.multiply(h, xv), c);
               i2++;
             }
             return xk;
@@ -28988,14 +28988,14 @@ var require_jstat = __commonJS({
               factor = a[i2 + 1][i2] > 0 ? -1 : 1;
               alpha = factor * Math2.sqrt(alpha);
               r = Math2.sqrt((alpha * alpha - a[i2 + 1][i2] * alpha) / 2);
-              w = jStat3.zeros(m, 1);
+              w = jStat4.zeros(m, 1);
               w[i2 + 1][0] = (a[i2 + 1][i2] - alpha) / (2 * r);
               for (k = i2 + 2; k < m; k++) w[k][0] = a[k][i2] / (2 * r);
-              p = jStat3.subtract(
-                jStat3.identity(m, n),
-                jStat3.multiply(jStat3.multiply(w, jStat3.transpose(w)), 2)
+              p = jStat4.subtract(
+                jStat4.identity(m, n),
+                jStat4.multiply(jStat4.multiply(w, jStat4.transpose(w)), 2)
               );
-              a = jStat3.multiply(p, jStat3.multiply(a, p));
+              a = jStat4.multiply(p, jStat4.multiply(a, p));
             }
             return a;
           },
@@ -29003,13 +29003,13 @@ var require_jstat = __commonJS({
           // Q is orthogonal matrix
           // R is upper triangular
           QR: (function() {
-            var sum = jStat3.sum;
-            var range = jStat3.arange;
+            var sum = jStat4.sum;
+            var range = jStat4.arange;
             function qr2(x2) {
               var n = x2.length;
               var p = x2[0].length;
-              var r = jStat3.zeros(p, p);
-              x2 = jStat3.copy(x2);
+              var r = jStat4.zeros(p, p);
+              x2 = jStat4.copy(x2);
               var i2, j, k;
               for (j = 0; j < p; j++) {
                 r[j][j] = Math2.sqrt(sum(range(n).map(function(i3) {
@@ -29033,28 +29033,28 @@ var require_jstat = __commonJS({
           })(),
           lstsq: /* @__PURE__ */ (function() {
             function R_I(A) {
-              A = jStat3.copy(A);
+              A = jStat4.copy(A);
               var size = A.length;
-              var I = jStat3.identity(size);
-              jStat3.arange(size - 1, -1, -1).forEach(function(i2) {
-                jStat3.sliceAssign(
+              var I = jStat4.identity(size);
+              jStat4.arange(size - 1, -1, -1).forEach(function(i2) {
+                jStat4.sliceAssign(
                   I,
                   { row: i2 },
-                  jStat3.divide(jStat3.slice(I, { row: i2 }), A[i2][i2])
+                  jStat4.divide(jStat4.slice(I, { row: i2 }), A[i2][i2])
                 );
-                jStat3.sliceAssign(
+                jStat4.sliceAssign(
                   A,
                   { row: i2 },
-                  jStat3.divide(jStat3.slice(A, { row: i2 }), A[i2][i2])
+                  jStat4.divide(jStat4.slice(A, { row: i2 }), A[i2][i2])
                 );
-                jStat3.arange(i2).forEach(function(j) {
-                  var c = jStat3.multiply(A[j][i2], -1);
-                  var Aj = jStat3.slice(A, { row: j });
-                  var cAi = jStat3.multiply(jStat3.slice(A, { row: i2 }), c);
-                  jStat3.sliceAssign(A, { row: j }, jStat3.add(Aj, cAi));
-                  var Ij = jStat3.slice(I, { row: j });
-                  var cIi = jStat3.multiply(jStat3.slice(I, { row: i2 }), c);
-                  jStat3.sliceAssign(I, { row: j }, jStat3.add(Ij, cIi));
+                jStat4.arange(i2).forEach(function(j) {
+                  var c = jStat4.multiply(A[j][i2], -1);
+                  var Aj = jStat4.slice(A, { row: j });
+                  var cAi = jStat4.multiply(jStat4.slice(A, { row: i2 }), c);
+                  jStat4.sliceAssign(A, { row: j }, jStat4.add(Aj, cAi));
+                  var Ij = jStat4.slice(I, { row: j });
+                  var cIi = jStat4.multiply(jStat4.slice(I, { row: i2 }), c);
+                  jStat4.sliceAssign(I, { row: j }, jStat4.add(Ij, cIi));
                 });
               });
               return I;
@@ -29067,18 +29067,18 @@ var require_jstat = __commonJS({
                 });
                 array_mode = true;
               }
-              var QR = jStat3.QR(A);
+              var QR = jStat4.QR(A);
               var Q = QR[0];
               var R = QR[1];
               var attrs = A[0].length;
-              var Q1 = jStat3.slice(Q, { col: { end: attrs } });
-              var R1 = jStat3.slice(R, { row: { end: attrs } });
+              var Q1 = jStat4.slice(Q, { col: { end: attrs } });
+              var R1 = jStat4.slice(R, { row: { end: attrs } });
               var RI = R_I(R1);
-              var Q2 = jStat3.transpose(Q1);
+              var Q2 = jStat4.transpose(Q1);
               if (Q2[0].length === void 0) {
                 Q2 = [Q2];
               }
-              var x2 = jStat3.multiply(jStat3.multiply(RI, Q2), b);
+              var x2 = jStat4.multiply(jStat4.multiply(RI, Q2), b);
               if (x2.length === void 0) {
                 x2 = [[x2]];
               }
@@ -29093,7 +29093,7 @@ var require_jstat = __commonJS({
           jacobi: function jacobi(a) {
             var condition = 1;
             var n = a.length;
-            var e = jStat3.identity(n, n);
+            var e = jStat4.identity(n, n);
             var ev = [];
             var b, i2, j, p, q, maxim, theta, s;
             while (condition === 1) {
@@ -29115,13 +29115,13 @@ var require_jstat = __commonJS({
                 theta = a[p][q] > 0 ? Math2.PI / 4 : -Math2.PI / 4;
               else
                 theta = Math2.atan(2 * a[p][q] / (a[p][p] - a[q][q])) / 2;
-              s = jStat3.identity(n, n);
+              s = jStat4.identity(n, n);
               s[p][p] = Math2.cos(theta);
               s[p][q] = -Math2.sin(theta);
               s[q][p] = Math2.sin(theta);
               s[q][q] = Math2.cos(theta);
-              e = jStat3.multiply(e, s);
-              b = jStat3.multiply(jStat3.multiply(jStat3.inv(s), a), s);
+              e = jStat4.multiply(e, s);
+              b = jStat4.multiply(jStat4.multiply(jStat4.inv(s), a), s);
               a = b;
               condition = 0;
               for (i2 = 1; i2 < n; i2++) {
@@ -29301,7 +29301,7 @@ var require_jstat = __commonJS({
               A[i2][i2 + 1] = h[i2];
               B[i2][0] = alpha[i2];
             }
-            c = jStat3.multiply(jStat3.inv(A), B);
+            c = jStat4.multiply(jStat4.inv(A), B);
             for (j = 0; j < n - 1; j++) {
               b[j] = (F[j + 1] - F[j]) / h[j] - h[j] * (c[j + 1][0] + 2 * c[j][0]) / 3;
               d[j] = (c[j + 1][0] - c[j][0]) / (3 * h[j]);
@@ -29310,7 +29310,7 @@ var require_jstat = __commonJS({
               if (X[j] > value) break;
             }
             j -= 1;
-            return F[j] + (value - X[j]) * b[j] + jStat3.sq(value - X[j]) * c[j] + (value - X[j]) * jStat3.sq(value - X[j]) * d[j];
+            return F[j] + (value - X[j]) * b[j] + jStat4.sq(value - X[j]) * c[j] + (value - X[j]) * jStat4.sq(value - X[j]) * d[j];
           },
           gauss_quadrature: function gauss_quadrature() {
             throw new Error("gauss_quadrature not yet implemented");
@@ -29331,7 +29331,7 @@ var require_jstat = __commonJS({
             var V = [];
             var Vt = [];
             for (i2 = 0; i2 < m; i2++) {
-              u[i2] = jStat3.sum(X[i2]) / n;
+              u[i2] = jStat4.sum(X[i2]) / n;
             }
             for (i2 = 0; i2 < n; i2++) {
               B[i2] = [];
@@ -29339,17 +29339,17 @@ var require_jstat = __commonJS({
                 B[i2][j] = X[j][i2] - u[j];
               }
             }
-            B = jStat3.transpose(B);
+            B = jStat4.transpose(B);
             for (i2 = 0; i2 < m; i2++) {
               C[i2] = [];
               for (j = 0; j < m; j++) {
-                C[i2][j] = jStat3.dot([B[i2]], [B[j]]) / (n - 1);
+                C[i2][j] = jStat4.dot([B[i2]], [B[j]]) / (n - 1);
               }
             }
-            result = jStat3.jacobi(C);
+            result = jStat4.jacobi(C);
             V = result[0];
             D = result[1];
-            Vt = jStat3.transpose(V);
+            Vt = jStat4.transpose(V);
             for (i2 = 0; i2 < D.length; i2++) {
               for (j = i2; j < D.length; j++) {
                 if (D[i2] < D[j]) {
@@ -29362,11 +29362,11 @@ var require_jstat = __commonJS({
                 }
               }
             }
-            Bt = jStat3.transpose(B);
+            Bt = jStat4.transpose(B);
             for (i2 = 0; i2 < m; i2++) {
               Y[i2] = [];
               for (j = 0; j < Bt.length; j++) {
-                Y[i2][j] = jStat3.dot([Vt[i2]], [Bt[j]]);
+                Y[i2][j] = jStat4.dot([Vt[i2]], [Bt[j]]);
               }
             }
             return [X, D, Vt, Y];
@@ -29374,27 +29374,27 @@ var require_jstat = __commonJS({
         });
         (function(funcs) {
           for (var i2 = 0; i2 < funcs.length; i2++) (function(passfunc) {
-            jStat3.fn[passfunc] = function(arg, func) {
+            jStat4.fn[passfunc] = function(arg, func) {
               var tmpthis = this;
               if (func) {
                 setTimeout(function() {
-                  func.call(tmpthis, jStat3.fn[passfunc].call(tmpthis, arg));
+                  func.call(tmpthis, jStat4.fn[passfunc].call(tmpthis, arg));
                 }, 15);
                 return this;
               }
-              if (typeof jStat3[passfunc](this, arg) === "number")
-                return jStat3[passfunc](this, arg);
+              if (typeof jStat4[passfunc](this, arg) === "number")
+                return jStat4[passfunc](this, arg);
               else
-                return jStat3(jStat3[passfunc](this, arg));
+                return jStat4(jStat4[passfunc](this, arg));
             };
           })(funcs[i2]);
         })("add divide multiply subtract dot pow exp log abs norm angle".split(" "));
-      })(jStat2, Math);
-      (function(jStat3, Math2) {
+      })(jStat3, Math);
+      (function(jStat4, Math2) {
         var slice = [].slice;
-        var isNumber = jStat3.utils.isNumber;
-        var isArray = jStat3.utils.isArray;
-        jStat3.extend({
+        var isNumber = jStat4.utils.isNumber;
+        var isArray = jStat4.utils.isArray;
+        jStat4.extend({
           // 2 different parameter lists:
           // (value, mean, sd)
           // (value, array, flag)
@@ -29403,7 +29403,7 @@ var require_jstat = __commonJS({
             if (isNumber(args[1])) {
               return (args[0] - args[1]) / args[2];
             }
-            return (args[0] - jStat3.mean(args[1])) / jStat3.stdev(args[1], args[2]);
+            return (args[0] - jStat4.mean(args[1])) / jStat4.stdev(args[1], args[2]);
           },
           // 3 different paramter lists:
           // (value, mean, sd, sides)
@@ -29413,35 +29413,35 @@ var require_jstat = __commonJS({
             var args = slice.call(arguments);
             var z;
             if (isArray(args[1])) {
-              z = jStat3.zscore(args[0], args[1], args[3]);
-              return args[2] === 1 ? jStat3.normal.cdf(-Math2.abs(z), 0, 1) : jStat3.normal.cdf(-Math2.abs(z), 0, 1) * 2;
+              z = jStat4.zscore(args[0], args[1], args[3]);
+              return args[2] === 1 ? jStat4.normal.cdf(-Math2.abs(z), 0, 1) : jStat4.normal.cdf(-Math2.abs(z), 0, 1) * 2;
             } else {
               if (args.length > 2) {
-                z = jStat3.zscore(args[0], args[1], args[2]);
-                return args[3] === 1 ? jStat3.normal.cdf(-Math2.abs(z), 0, 1) : jStat3.normal.cdf(-Math2.abs(z), 0, 1) * 2;
+                z = jStat4.zscore(args[0], args[1], args[2]);
+                return args[3] === 1 ? jStat4.normal.cdf(-Math2.abs(z), 0, 1) : jStat4.normal.cdf(-Math2.abs(z), 0, 1) * 2;
               } else {
                 z = args[0];
-                return args[1] === 1 ? jStat3.normal.cdf(-Math2.abs(z), 0, 1) : jStat3.normal.cdf(-Math2.abs(z), 0, 1) * 2;
+                return args[1] === 1 ? jStat4.normal.cdf(-Math2.abs(z), 0, 1) : jStat4.normal.cdf(-Math2.abs(z), 0, 1) * 2;
               }
             }
           }
         });
-        jStat3.extend(jStat3.fn, {
+        jStat4.extend(jStat4.fn, {
           zscore: function zscore(value, flag) {
             return (value - this.mean()) / this.stdev(flag);
           },
           ztest: function ztest(value, sides, flag) {
             var zscore = Math2.abs(this.zscore(value, flag));
-            return sides === 1 ? jStat3.normal.cdf(-zscore, 0, 1) : jStat3.normal.cdf(-zscore, 0, 1) * 2;
+            return sides === 1 ? jStat4.normal.cdf(-zscore, 0, 1) : jStat4.normal.cdf(-zscore, 0, 1) * 2;
           }
         });
-        jStat3.extend({
+        jStat4.extend({
           // 2 parameter lists
           // (value, mean, sd, n)
           // (value, array)
           tscore: function tscore() {
             var args = slice.call(arguments);
-            return args.length === 4 ? (args[0] - args[1]) / (args[2] / Math2.sqrt(args[3])) : (args[0] - jStat3.mean(args[1])) / (jStat3.stdev(args[1], true) / Math2.sqrt(args[1].length));
+            return args.length === 4 ? (args[0] - args[1]) / (args[2] / Math2.sqrt(args[3])) : (args[0] - jStat4.mean(args[1])) / (jStat4.stdev(args[1], true) / Math2.sqrt(args[1].length));
           },
           // 3 different paramter lists:
           // (value, mean, sd, n, sides)
@@ -29451,26 +29451,26 @@ var require_jstat = __commonJS({
             var args = slice.call(arguments);
             var tscore;
             if (args.length === 5) {
-              tscore = Math2.abs(jStat3.tscore(args[0], args[1], args[2], args[3]));
-              return args[4] === 1 ? jStat3.studentt.cdf(-tscore, args[3] - 1) : jStat3.studentt.cdf(-tscore, args[3] - 1) * 2;
+              tscore = Math2.abs(jStat4.tscore(args[0], args[1], args[2], args[3]));
+              return args[4] === 1 ? jStat4.studentt.cdf(-tscore, args[3] - 1) : jStat4.studentt.cdf(-tscore, args[3] - 1) * 2;
             }
             if (isNumber(args[1])) {
               tscore = Math2.abs(args[0]);
-              return args[2] == 1 ? jStat3.studentt.cdf(-tscore, args[1] - 1) : jStat3.studentt.cdf(-tscore, args[1] - 1) * 2;
+              return args[2] == 1 ? jStat4.studentt.cdf(-tscore, args[1] - 1) : jStat4.studentt.cdf(-tscore, args[1] - 1) * 2;
             }
-            tscore = Math2.abs(jStat3.tscore(args[0], args[1]));
-            return args[2] == 1 ? jStat3.studentt.cdf(-tscore, args[1].length - 1) : jStat3.studentt.cdf(-tscore, args[1].length - 1) * 2;
+            tscore = Math2.abs(jStat4.tscore(args[0], args[1]));
+            return args[2] == 1 ? jStat4.studentt.cdf(-tscore, args[1].length - 1) : jStat4.studentt.cdf(-tscore, args[1].length - 1) * 2;
           }
         });
-        jStat3.extend(jStat3.fn, {
+        jStat4.extend(jStat4.fn, {
           tscore: function tscore(value) {
             return (value - this.mean()) / (this.stdev(true) / Math2.sqrt(this.cols()));
           },
           ttest: function ttest(value, sides) {
-            return sides === 1 ? 1 - jStat3.studentt.cdf(Math2.abs(this.tscore(value)), this.cols() - 1) : jStat3.studentt.cdf(-Math2.abs(this.tscore(value)), this.cols() - 1) * 2;
+            return sides === 1 ? 1 - jStat4.studentt.cdf(Math2.abs(this.tscore(value)), this.cols() - 1) : jStat4.studentt.cdf(-Math2.abs(this.tscore(value)), this.cols() - 1) * 2;
           }
         });
-        jStat3.extend({
+        jStat4.extend({
           // Paramter list is as follows:
           // (array1, array2, array3, ...)
           // or it is an array of arrays
@@ -29488,15 +29488,15 @@ var require_jstat = __commonJS({
             for (i2 = 0; i2 < args.length; i2++) {
               sample = sample.concat(args[i2]);
             }
-            sampMean = jStat3.mean(sample);
+            sampMean = jStat4.mean(sample);
             expVar = 0;
             for (i2 = 0; i2 < args.length; i2++) {
-              expVar = expVar + args[i2].length * Math2.pow(jStat3.mean(args[i2]) - sampMean, 2);
+              expVar = expVar + args[i2].length * Math2.pow(jStat4.mean(args[i2]) - sampMean, 2);
             }
             expVar /= args.length - 1;
             unexpVar = 0;
             for (i2 = 0; i2 < args.length; i2++) {
-              sampSampMean = jStat3.mean(args[i2]);
+              sampSampMean = jStat4.mean(args[i2]);
               for (j = 0; j < args[i2].length; j++) {
                 unexpVar += Math2.pow(args[i2][j] - sampSampMean, 2);
               }
@@ -29510,24 +29510,24 @@ var require_jstat = __commonJS({
           anovaftest: function anovaftest() {
             var args = slice.call(arguments), df1, df2, n, i2;
             if (isNumber(args[0])) {
-              return 1 - jStat3.centralF.cdf(args[0], args[1], args[2]);
+              return 1 - jStat4.centralF.cdf(args[0], args[1], args[2]);
             }
-            var anovafscore = jStat3.anovafscore(args);
+            var anovafscore = jStat4.anovafscore(args);
             df1 = args.length - 1;
             n = 0;
             for (i2 = 0; i2 < args.length; i2++) {
               n = n + args[i2].length;
             }
             df2 = n - df1 - 1;
-            return 1 - jStat3.centralF.cdf(anovafscore, df1, df2);
+            return 1 - jStat4.centralF.cdf(anovafscore, df1, df2);
           },
           ftest: function ftest(fscore, df1, df2) {
-            return 1 - jStat3.centralF.cdf(fscore, df1, df2);
+            return 1 - jStat4.centralF.cdf(fscore, df1, df2);
           }
         });
-        jStat3.extend(jStat3.fn, {
+        jStat4.extend(jStat4.fn, {
           anovafscore: function anovafscore() {
-            return jStat3.anovafscore(this.toArray());
+            return jStat4.anovafscore(this.toArray());
           },
           anovaftes: function anovaftes() {
             var n = 0;
@@ -29535,10 +29535,10 @@ var require_jstat = __commonJS({
             for (i2 = 0; i2 < this.length; i2++) {
               n = n + this[i2].length;
             }
-            return jStat3.ftest(this.anovafscore(), this.length - 1, n - this.length);
+            return jStat4.ftest(this.anovafscore(), this.length - 1, n - this.length);
           }
         });
-        jStat3.extend({
+        jStat4.extend({
           // 2 parameter lists
           // (mean1, mean2, n1, n2, sd)
           // (array1, array2, sd)
@@ -29552,8 +29552,8 @@ var require_jstat = __commonJS({
               n2 = args[3];
               sd = args[4];
             } else {
-              mean1 = jStat3.mean(args[0]);
-              mean2 = jStat3.mean(args[1]);
+              mean1 = jStat4.mean(args[0]);
+              mean2 = jStat4.mean(args[1]);
               n1 = args[0].length;
               n2 = args[1].length;
               sd = args[2];
@@ -29571,20 +29571,20 @@ var require_jstat = __commonJS({
               qscore = args[0];
               args = args.slice(1);
             } else if (args.length === 7) {
-              qscore = jStat3.qscore(args[0], args[1], args[2], args[3], args[4]);
+              qscore = jStat4.qscore(args[0], args[1], args[2], args[3], args[4]);
               args = args.slice(5);
             } else {
-              qscore = jStat3.qscore(args[0], args[1], args[2]);
+              qscore = jStat4.qscore(args[0], args[1], args[2]);
               args = args.slice(3);
             }
             var n = args[0];
             var k = args[1];
-            return 1 - jStat3.tukey.cdf(qscore, k, n - k);
+            return 1 - jStat4.tukey.cdf(qscore, k, n - k);
           },
           tukeyhsd: function tukeyhsd(arrays) {
-            var sd = jStat3.pooledstdev(arrays);
+            var sd = jStat4.pooledstdev(arrays);
             var means = arrays.map(function(arr) {
-              return jStat3.mean(arr);
+              return jStat4.mean(arr);
             });
             var n = arrays.reduce(function(n2, arr) {
               return n2 + arr.length;
@@ -29592,23 +29592,23 @@ var require_jstat = __commonJS({
             var results = [];
             for (var i2 = 0; i2 < arrays.length; ++i2) {
               for (var j = i2 + 1; j < arrays.length; ++j) {
-                var p = jStat3.qtest(means[i2], means[j], arrays[i2].length, arrays[j].length, sd, n, arrays.length);
+                var p = jStat4.qtest(means[i2], means[j], arrays[i2].length, arrays[j].length, sd, n, arrays.length);
                 results.push([[i2, j], p]);
               }
             }
             return results;
           }
         });
-        jStat3.extend({
+        jStat4.extend({
           // 2 different parameter setups
           // (value, alpha, sd, n)
           // (value, alpha, array)
           normalci: function normalci() {
             var args = slice.call(arguments), ans = new Array(2), change;
             if (args.length === 4) {
-              change = Math2.abs(jStat3.normal.inv(args[1] / 2, 0, 1) * args[2] / Math2.sqrt(args[3]));
+              change = Math2.abs(jStat4.normal.inv(args[1] / 2, 0, 1) * args[2] / Math2.sqrt(args[3]));
             } else {
-              change = Math2.abs(jStat3.normal.inv(args[1] / 2, 0, 1) * jStat3.stdev(args[2]) / Math2.sqrt(args[2].length));
+              change = Math2.abs(jStat4.normal.inv(args[1] / 2, 0, 1) * jStat4.stdev(args[2]) / Math2.sqrt(args[2].length));
             }
             ans[0] = args[0] - change;
             ans[1] = args[0] + change;
@@ -29620,9 +29620,9 @@ var require_jstat = __commonJS({
           tci: function tci() {
             var args = slice.call(arguments), ans = new Array(2), change;
             if (args.length === 4) {
-              change = Math2.abs(jStat3.studentt.inv(args[1] / 2, args[3] - 1) * args[2] / Math2.sqrt(args[3]));
+              change = Math2.abs(jStat4.studentt.inv(args[1] / 2, args[3] - 1) * args[2] / Math2.sqrt(args[3]));
             } else {
-              change = Math2.abs(jStat3.studentt.inv(args[1] / 2, args[2].length - 1) * jStat3.stdev(args[2], true) / Math2.sqrt(args[2].length));
+              change = Math2.abs(jStat4.studentt.inv(args[1] / 2, args[2].length - 1) * jStat4.stdev(args[2], true) / Math2.sqrt(args[2].length));
             }
             ans[0] = args[0] - change;
             ans[1] = args[0] + change;
@@ -29632,12 +29632,12 @@ var require_jstat = __commonJS({
             return pvalue < alpha;
           }
         });
-        jStat3.extend(jStat3.fn, {
+        jStat4.extend(jStat4.fn, {
           normalci: function normalci(value, alpha) {
-            return jStat3.normalci(value, alpha, this.toArray());
+            return jStat4.normalci(value, alpha, this.toArray());
           },
           tci: function tci(value, alpha) {
-            return jStat3.tci(value, alpha, this.toArray());
+            return jStat4.tci(value, alpha, this.toArray());
           }
         });
         function differenceOfProportions(p1, n1, p2, n2) {
@@ -29648,29 +29648,29 @@ var require_jstat = __commonJS({
           var se = Math2.sqrt(pooled * (1 - pooled) * (1 / n1 + 1 / n2));
           return (p1 - p2) / se;
         }
-        jStat3.extend(jStat3.fn, {
+        jStat4.extend(jStat4.fn, {
           oneSidedDifferenceOfProportions: function oneSidedDifferenceOfProportions(p1, n1, p2, n2) {
             var z = differenceOfProportions(p1, n1, p2, n2);
-            return jStat3.ztest(z, 1);
+            return jStat4.ztest(z, 1);
           },
           twoSidedDifferenceOfProportions: function twoSidedDifferenceOfProportions(p1, n1, p2, n2) {
             var z = differenceOfProportions(p1, n1, p2, n2);
-            return jStat3.ztest(z, 2);
+            return jStat4.ztest(z, 2);
           }
         });
-      })(jStat2, Math);
-      jStat2.models = /* @__PURE__ */ (function() {
+      })(jStat3, Math);
+      jStat3.models = /* @__PURE__ */ (function() {
         function sub_regress(exog) {
           var var_count = exog[0].length;
-          var modelList = jStat2.arange(var_count).map(function(endog_index) {
-            var exog_index = jStat2.arange(var_count).filter(function(i2) {
+          var modelList = jStat3.arange(var_count).map(function(endog_index) {
+            var exog_index = jStat3.arange(var_count).filter(function(i2) {
               return i2 !== endog_index;
             });
             return ols(
-              jStat2.col(exog, endog_index).map(function(x2) {
+              jStat3.col(exog, endog_index).map(function(x2) {
                 return x2[0];
               }),
-              jStat2.col(exog, exog_index)
+              jStat3.col(exog, exog_index)
             );
           });
           return modelList;
@@ -29679,18 +29679,18 @@ var require_jstat = __commonJS({
           var nobs = endog.length;
           var df_model = exog[0].length - 1;
           var df_resid = nobs - df_model - 1;
-          var coef = jStat2.lstsq(exog, endog);
-          var predict = jStat2.multiply(exog, coef.map(function(x2) {
+          var coef = jStat3.lstsq(exog, endog);
+          var predict = jStat3.multiply(exog, coef.map(function(x2) {
             return [x2];
           })).map(function(p) {
             return p[0];
           });
-          var resid = jStat2.subtract(endog, predict);
-          var ybar = jStat2.mean(endog);
-          var SSE = jStat2.sum(predict.map(function(f) {
+          var resid = jStat3.subtract(endog, predict);
+          var ybar = jStat3.mean(endog);
+          var SSE = jStat3.sum(predict.map(function(f) {
             return Math.pow(f - ybar, 2);
           }));
-          var SSR = jStat2.sum(endog.map(function(y, i2) {
+          var SSR = jStat3.sum(endog.map(function(y, i2) {
             return Math.pow(y - predict[i2], 2);
           }));
           var SST = SSE + SSR;
@@ -29723,10 +29723,10 @@ var require_jstat = __commonJS({
             return (coef - 0) / seBetaHat[i2];
           });
           var pValue2 = tStatistic.map(function(t) {
-            var leftppf = jStat2.studentt.cdf(t, model.df_resid);
+            var leftppf = jStat3.studentt.cdf(t, model.df_resid);
             return (leftppf > 0.5 ? 1 - leftppf : leftppf) * 2;
           });
-          var c = jStat2.studentt.inv(0.975, model.df_resid);
+          var c = jStat3.studentt.inv(0.975, model.df_resid);
           var interval95 = model.coef.map(function(coef, i2) {
             var d = c * seBetaHat[i2];
             return [coef - d, coef + d];
@@ -29742,7 +29742,7 @@ var require_jstat = __commonJS({
         function F_test(model) {
           var F_statistic = model.R2 / model.df_model / ((1 - model.R2) / model.df_resid);
           var fcdf = function(x2, n1, n2) {
-            return jStat2.beta.cdf(x2 / (n2 / n1 + x2), n1 / 2, n2 / 2);
+            return jStat3.beta.cdf(x2 / (n2 / n1 + x2), n1 / 2, n2 / 2);
           };
           var pvalue = 1 - fcdf(F_statistic, model.df_model, model.df_resid);
           return { F_statistic, pvalue };
@@ -29759,14 +29759,14 @@ var require_jstat = __commonJS({
         }
         return { ols: ols_wrap };
       })();
-      jStat2.extend({
+      jStat3.extend({
         buildxmatrix: function buildxmatrix() {
           var matrixRows = new Array(arguments.length);
           for (var i2 = 0; i2 < arguments.length; i2++) {
             var array = [1];
             matrixRows[i2] = array.concat(arguments[i2]);
           }
-          return jStat2(matrixRows);
+          return jStat3(matrixRows);
         },
         builddxmatrix: function builddxmatrix() {
           var matrixRows = new Array(arguments[0].length);
@@ -29774,17 +29774,17 @@ var require_jstat = __commonJS({
             var array = [1];
             matrixRows[i2] = array.concat(arguments[0][i2]);
           }
-          return jStat2(matrixRows);
+          return jStat3(matrixRows);
         },
         buildjxmatrix: function buildjxmatrix(jMat) {
           var pass = new Array(jMat.length);
           for (var i2 = 0; i2 < jMat.length; i2++) {
             pass[i2] = jMat[i2];
           }
-          return jStat2.builddxmatrix(pass);
+          return jStat3.builddxmatrix(pass);
         },
         buildymatrix: function buildymatrix(array) {
-          return jStat2(array).transpose();
+          return jStat3(array).transpose();
         },
         buildjymatrix: function buildjymatrix(jMat) {
           return jMat.transpose();
@@ -29804,7 +29804,7 @@ var require_jstat = __commonJS({
                   result[i2][j] = sum;
                 }
               }
-              return jStat2(result);
+              return jStat3(result);
             }
             result = [];
             for (i2 = 0; i2 < A.rows(); i2++) {
@@ -29817,34 +29817,34 @@ var require_jstat = __commonJS({
                 result[i2][j] = sum;
               }
             }
-            return jStat2(result);
+            return jStat3(result);
           }
         },
         //regress and regresst to be fixed
         regress: function regress(jMatX, jMatY) {
-          var innerinv = jStat2.xtranspxinv(jMatX);
+          var innerinv = jStat3.xtranspxinv(jMatX);
           var xtransp = jMatX.transpose();
-          var next = jStat2.matrixmult(jStat2(innerinv), xtransp);
-          return jStat2.matrixmult(next, jMatY);
+          var next = jStat3.matrixmult(jStat3(innerinv), xtransp);
+          return jStat3.matrixmult(next, jMatY);
         },
         regresst: function regresst(jMatX, jMatY, sides) {
-          var beta = jStat2.regress(jMatX, jMatY);
+          var beta = jStat3.regress(jMatX, jMatY);
           var compile = {};
           compile.anova = {};
-          var jMatYBar = jStat2.jMatYBar(jMatX, beta);
+          var jMatYBar = jStat3.jMatYBar(jMatX, beta);
           compile.yBar = jMatYBar;
           var yAverage = jMatY.mean();
-          compile.anova.residuals = jStat2.residuals(jMatY, jMatYBar);
-          compile.anova.ssr = jStat2.ssr(jMatYBar, yAverage);
+          compile.anova.residuals = jStat3.residuals(jMatY, jMatYBar);
+          compile.anova.ssr = jStat3.ssr(jMatYBar, yAverage);
           compile.anova.msr = compile.anova.ssr / (jMatX[0].length - 1);
-          compile.anova.sse = jStat2.sse(jMatY, jMatYBar);
+          compile.anova.sse = jStat3.sse(jMatY, jMatYBar);
           compile.anova.mse = compile.anova.sse / (jMatY.length - (jMatX[0].length - 1) - 1);
-          compile.anova.sst = jStat2.sst(jMatY, yAverage);
+          compile.anova.sst = jStat3.sst(jMatY, yAverage);
           compile.anova.mst = compile.anova.sst / (jMatY.length - 1);
           compile.anova.r2 = 1 - compile.anova.sse / compile.anova.sst;
           if (compile.anova.r2 < 0) compile.anova.r2 = 0;
           compile.anova.fratio = compile.anova.msr / compile.anova.mse;
-          compile.anova.pvalue = jStat2.anovaftest(
+          compile.anova.pvalue = jStat3.anovaftest(
             compile.anova.fratio,
             jMatX[0].length - 1,
             jMatY.length - (jMatX[0].length - 1) - 1
@@ -29853,31 +29853,31 @@ var require_jstat = __commonJS({
           compile.anova.r2adj = 1 - compile.anova.mse / compile.anova.mst;
           if (compile.anova.r2adj < 0) compile.anova.r2adj = 0;
           compile.stats = new Array(jMatX[0].length);
-          var covar = jStat2.xtranspxinv(jMatX);
+          var covar = jStat3.xtranspxinv(jMatX);
           var sds, ts, ps;
           for (var i2 = 0; i2 < beta.length; i2++) {
             sds = Math.sqrt(compile.anova.mse * Math.abs(covar[i2][i2]));
             ts = Math.abs(beta[i2] / sds);
-            ps = jStat2.ttest(ts, jMatY.length - jMatX[0].length - 1, sides);
+            ps = jStat3.ttest(ts, jMatY.length - jMatX[0].length - 1, sides);
             compile.stats[i2] = [beta[i2], sds, ts, ps];
           }
           compile.regress = beta;
           return compile;
         },
         xtranspx: function xtranspx(jMatX) {
-          return jStat2.matrixmult(jMatX.transpose(), jMatX);
+          return jStat3.matrixmult(jMatX.transpose(), jMatX);
         },
         xtranspxinv: function xtranspxinv(jMatX) {
-          var inner = jStat2.matrixmult(jMatX.transpose(), jMatX);
-          var innerinv = jStat2.inv(inner);
+          var inner = jStat3.matrixmult(jMatX.transpose(), jMatX);
+          var innerinv = jStat3.inv(inner);
           return innerinv;
         },
         jMatYBar: function jMatYBar(jMatX, beta) {
-          var yBar = jStat2.matrixmult(jMatX, beta);
-          return new jStat2(yBar);
+          var yBar = jStat3.matrixmult(jMatX, beta);
+          return new jStat3(yBar);
         },
         residuals: function residuals(jMatY, jMatYBar) {
-          return jStat2.matrixsubtract(jMatY, jMatYBar);
+          return jStat3.matrixsubtract(jMatY, jMatYBar);
         },
         ssr: function ssr(jMatYBar, yAverage) {
           var ssr2 = 0;
@@ -29908,11 +29908,11 @@ var require_jstat = __commonJS({
               ans[i2][j] = A[i2][j] - B[i2][j];
             }
           }
-          return jStat2(ans);
+          return jStat3(ans);
         }
       });
-      jStat2.jStat = jStat2;
-      return jStat2;
+      jStat3.jStat = jStat3;
+      return jStat3;
     });
   }
 });
@@ -47789,11 +47789,16 @@ function binomialVariance(p, n) {
 }
 function wilsonInterval(successes, n, alpha) {
   assertAlpha(alpha);
+  return wilsonAtZ(successes, n, normalQuantile(1 - alpha / 2));
+}
+function wilsonAtZ(successes, n, z) {
   assertCount("successes", successes);
   assertCount("n", n);
   if (successes > n) throw new RangeError(`successes (${successes}) must not exceed n (${n})`);
+  if (!(z >= 0) || !Number.isFinite(z)) {
+    throw new RangeError(`z must be a finite number >= 0; got ${z}`);
+  }
   if (n === 0) return [0, 1];
-  const z = normalQuantile(1 - alpha / 2);
   const z2 = z * z;
   const centre = (successes + z2 / 2) / (n + z2);
   const half = z / (n + z2) * Math.sqrt(successes * (n - successes) / n + z2 / 4);
@@ -47840,6 +47845,9 @@ function holmAdjust(p) {
   });
   return out;
 }
+
+// src/stats/noncentral-t.ts
+var import_jstat2 = __toESM(require_jstat(), 1);
 
 // src/analysis/curves/early-stopping.ts
 var STRIP = 5;
@@ -48433,11 +48441,17 @@ function fitPowerLaw(m, e, options) {
   const meanE = e.reduce((s, v) => s + v, 0) / e.length;
   const tss = e.reduce((s, v) => s + (v - meanE) ** 2, 0);
   const level = options.level ?? 0.95;
-  const t = best.dof > 0 ? tQuantile(1 - (1 - level) / 2, best.dof) : NaN;
+  const cAtBound = best.atBound[2] === true && best.atBound[1] !== true;
+  const full = cAtBound ? fullCovariance(
+    u.map((ui) => jacobian([bigA, b, c], ui)),
+    best.rss
+  ) : null;
+  const cov = full ? full.covariance : best.covariance;
+  const dof = full ? full.dof : best.dof;
+  const t = dof > 0 ? tQuantile(1 - (1 - level) / 2, dof) : NaN;
   const projections = multiples.map((k) => {
     const error2 = model([bigA, b, c], k);
     const g = jacobian([bigA, b, c], k);
-    const cov = best.covariance;
     let variance = NaN;
     if (cov) {
       variance = 0;
@@ -48461,8 +48475,25 @@ function fitPowerLaw(m, e, options) {
     rss: best.rss,
     dof: best.dof,
     atBound: { b: best.atBound[1] === true, c: best.atBound[2] === true },
+    intervalCovariance: full ? "full" : "free",
     projections
   };
+}
+function fullCovariance(jac, rss) {
+  const n = jac.length;
+  const p = jac[0]?.length ?? 0;
+  const dof = n - p;
+  if (dof <= 0) return null;
+  const norms = Array.from({ length: p }, (_, j) => Math.hypot(...jac.map((row) => row[j] ?? 0)));
+  if (norms.some((v) => !(v > 0) || !Number.isFinite(v))) return null;
+  const scaled = jac.map((row) => row.map((v, j) => v / norms[j]));
+  const inverse = inverseOfRtR(qrLeastSquares(scaled, new Array(n).fill(0)).r);
+  if (!inverse) return null;
+  const s2 = rss / dof;
+  const covariance = inverse.map(
+    (row, j) => row.map((v, k) => s2 * v / (norms[j] * norms[k]))
+  );
+  return { covariance, dof };
 }
 function startingValues(u, e, lower) {
   const minE = Math.min(...e);
