@@ -106,13 +106,13 @@ describe('readTensorBoard', () => {
   it('rejects a damaged record with its number and offset, and tolerates a cut-off last record', () => {
     const bytes = eventFile([{ step: 1, values: [{ tag: 'a', simple: 1 }] }]);
     const damaged = bytes.slice();
-    damaged[damaged.length - 6] ^= 0xff; // inside the second record's data
+    damaged[damaged.length - 6] = (damaged[damaged.length - 6] as number) ^ 0xff; // inside the second record's data
     expect(() => readTensorBoard(damaged, 'ev')).toThrow(InputError);
     expect(() => readTensorBoard(damaged, 'ev')).toThrow(
       /ev: record 2 \(byte \d+\) must hold data whose checksum matches/,
     );
     const badLength = bytes.slice();
-    badLength[0] ^= 1;
+    badLength[0] = (badLength[0] as number) ^ 1;
     expect(() => readTensorBoard(badLength, 'ev')).toThrow(
       /record 1 \(byte 0\) must start with a record length/,
     );
