@@ -49565,16 +49565,32 @@ var fitgap_run_1_schema_default = {
   required: ["format", "run", "metric", "splits"],
   additionalProperties: false,
   properties: {
-    $schema: { type: "string", description: "Optional pointer to this schema, for editors." },
-    format: { const: "fitgap-run/1" },
+    $schema: {
+      type: "string",
+      description: "Optional pointer to this schema, for editors."
+    },
+    format: {
+      const: "fitgap-run/1"
+    },
     run: {
       type: "object",
       required: ["name"],
       additionalProperties: false,
       properties: {
-        name: { type: "string", minLength: 1, maxLength: 200 },
-        commit: { type: "string", minLength: 1, maxLength: 64 },
-        createdAt: { type: "string", format: "date-time" }
+        name: {
+          type: "string",
+          minLength: 1,
+          maxLength: 200
+        },
+        commit: {
+          type: "string",
+          minLength: 1,
+          maxLength: 64
+        },
+        createdAt: {
+          type: "string",
+          format: "date-time"
+        }
       }
     },
     metric: {
@@ -49582,9 +49598,27 @@ var fitgap_run_1_schema_default = {
       required: ["name", "goal", "kind"],
       additionalProperties: false,
       properties: {
-        name: { type: "string", minLength: 1, maxLength: 100 },
-        goal: { enum: ["minimize", "maximize"] },
-        kind: { enum: ["proportion", "continuous"] }
+        name: {
+          type: "string",
+          minLength: 1,
+          maxLength: 100
+        },
+        goal: {
+          enum: ["minimize", "maximize"]
+        },
+        kind: {
+          enum: ["proportion", "continuous"]
+        },
+        best: {
+          type: "number",
+          description: "Best possible value of the metric: 1 for accuracy, AUC and R\xB2, 100 for a 0\u2013100 score, 0 for an error. The error level of a maximized metric is best \u2212 value."
+        },
+        unit: {
+          type: "string",
+          minLength: 1,
+          maxLength: 40,
+          description: `Unit of the metric's values, for labels (e.g. "ms", "BLEU"). Proportions need none.`
+        }
       }
     },
     reference: {
@@ -49596,10 +49630,18 @@ var fitgap_run_1_schema_default = {
       required: ["train", "validation"],
       additionalProperties: false,
       properties: {
-        train: { $ref: "#/$defs/split" },
-        train_dev: { $ref: "#/$defs/split" },
-        validation: { $ref: "#/$defs/split" },
-        test: { $ref: "#/$defs/split" }
+        train: {
+          $ref: "#/$defs/split"
+        },
+        train_dev: {
+          $ref: "#/$defs/split"
+        },
+        validation: {
+          $ref: "#/$defs/split"
+        },
+        test: {
+          $ref: "#/$defs/split"
+        }
       }
     },
     hyperparameters: {
@@ -49610,9 +49652,31 @@ var fitgap_run_1_schema_default = {
       type: "object",
       additionalProperties: false,
       properties: {
-        epochs: { $ref: "#/$defs/curve" },
-        training_examples: { $ref: "#/$defs/curve" },
-        regularization: { $ref: "#/$defs/curve" }
+        epochs: {
+          $ref: "#/$defs/curve"
+        },
+        training_examples: {
+          $ref: "#/$defs/curve"
+        },
+        regularization: {
+          $ref: "#/$defs/curve"
+        },
+        sources: {
+          type: "object",
+          additionalProperties: false,
+          description: "Where each curve's validation values came from: a `held-out` split (the default) or `cross-validation` inside the training set.",
+          properties: {
+            epochs: {
+              enum: ["held-out", "cross-validation"]
+            },
+            training_examples: {
+              enum: ["held-out", "cross-validation"]
+            },
+            regularization: {
+              enum: ["held-out", "cross-validation"]
+            }
+          }
+        }
       }
     },
     slices: {
@@ -49622,10 +49686,20 @@ var fitgap_run_1_schema_default = {
         required: ["name", "validation"],
         additionalProperties: false,
         properties: {
-          name: { type: "string", minLength: 1 },
-          examples: { type: "integer", minimum: 1 },
-          train: { type: "number" },
-          validation: { type: "number" }
+          name: {
+            type: "string",
+            minLength: 1
+          },
+          examples: {
+            type: "integer",
+            minimum: 1
+          },
+          train: {
+            type: "number"
+          },
+          validation: {
+            type: "number"
+          }
         }
       }
     },
@@ -49634,8 +49708,22 @@ var fitgap_run_1_schema_default = {
       required: ["split", "path"],
       additionalProperties: false,
       properties: {
-        split: { enum: ["train", "train_dev", "validation", "test"] },
-        path: { type: "string", minLength: 1 }
+        split: {
+          enum: ["train", "train_dev", "validation", "test"]
+        },
+        path: {
+          type: "string",
+          minLength: 1
+        },
+        aggregate: {
+          enum: ["mean", "rmse", "sum"],
+          description: "How the per-example `loss` column aggregates to the split's value (continuous metrics): `mean` (default; MAE, log loss, squared error), `rmse` (root of the mean of `loss`, which then holds squared errors), or `sum`."
+        },
+        repeat: {
+          type: "integer",
+          minimum: 0,
+          description: "Which repeat (0-based position in `values`) the predictions belong to; default 0."
+        }
       }
     }
   },
@@ -49645,8 +49733,21 @@ var fitgap_run_1_schema_default = {
       required: ["values"],
       additionalProperties: false,
       properties: {
-        examples: { type: "integer", minimum: 1 },
-        values: { type: "array", minItems: 1, items: { type: "number" } }
+        examples: {
+          type: "integer",
+          minimum: 1
+        },
+        values: {
+          type: "array",
+          minItems: 1,
+          items: {
+            type: "number"
+          }
+        },
+        evaluationRows: {
+          enum: ["fixed", "per-repeat"],
+          description: "Whether every repeat was evaluated on the same rows (`fixed`, the default) or drew its own rows (`per-repeat`, e.g. a new random split per seed). With fixed rows the spread across repeats misses the sampling noise of the evaluation set."
+        }
       }
     },
     curve: {
@@ -49657,9 +49758,15 @@ var fitgap_run_1_schema_default = {
         required: ["x", "validation"],
         additionalProperties: false,
         properties: {
-          x: { type: "number" },
-          train: { type: "number" },
-          validation: { type: "number" }
+          x: {
+            type: "number"
+          },
+          train: {
+            type: "number"
+          },
+          validation: {
+            type: "number"
+          }
         }
       }
     }
