@@ -17,6 +17,8 @@ export interface PickOptions {
   train?: string;
   validation?: string;
   metric?: string;
+  /** Take only the series named; do not look up a missing partner (a config mapping is exact). */
+  exact?: boolean;
 }
 
 /** Where series are listed, for "not found" messages: `{file: 'training.log', pointer: 'line 1', noun: 'column'}`. */
@@ -120,9 +122,12 @@ function pickByFlags(series: Series[], options: PickOptions, catalogue: Catalogu
     return s;
   };
   const all = groups(series);
+  const lookUp = options.exact !== true;
   const validationName =
     options.validation ??
-    (options.train === undefined ? undefined : partner(all, options.train, 'validation'));
+    (options.train === undefined || !lookUp
+      ? undefined
+      : partner(all, options.train, 'validation'));
   if (validationName === undefined) {
     throw new InputError([
       {
@@ -136,7 +141,9 @@ function pickByFlags(series: Series[], options: PickOptions, catalogue: Catalogu
   const validation = find(validationName, 'validation');
   const trainName =
     options.train ??
-    (options.validation === undefined ? undefined : partner(all, validationName, 'train'));
+    (options.validation === undefined || !lookUp
+      ? undefined
+      : partner(all, validationName, 'train'));
   const train = trainName === undefined ? undefined : find(trainName, 'train');
   const warnings: CurveLogWarning[] = [];
   if (train === undefined) warnings.push({ code: 'no-train-series', validation: validation.name });

@@ -106,6 +106,9 @@ describe('pickSeries by flags', () => {
     expect(v.train?.name).toBe('acc');
     const t = pickSeries(all, { train: 'loss' }, catalogue);
     expect(t.validation.name).toBe('val_loss');
+    // A config mapping is exact: no partner is added.
+    const exact = pickSeries(all, { validation: 'val_acc', exact: true }, catalogue);
+    expect(exact.train).toBeUndefined();
     const alone = pickSeries(series(['val_x']), { validation: 'val_x' }, catalogue);
     expect(alone.warnings).toEqual([{ code: 'no-train-series', validation: 'val_x' }]);
   });
