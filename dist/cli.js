@@ -23870,6 +23870,7 @@ var PointBudget = class {
 
 // src/artifact/curve-logs/csv-log.ts
 function splitCsvLine2(line) {
+  if (!line.includes('"')) return line.split(",").map((cell2) => cell2.trim());
   const cells = [];
   let cell = "";
   let quoted = false;
@@ -23994,6 +23995,8 @@ var MalformedProto = class extends Error {
   }
 };
 var WIRE = { varint: 0, fixed64: 1, bytes: 2, fixed32: 5 };
+var SCRATCH = new Uint8Array(8);
+var SCRATCH_VIEW = new DataView(SCRATCH.buffer);
 var ProtoReader = class {
   constructor(buf, start = 0, end = buf.length) {
     this.buf = buf;
@@ -24039,17 +24042,19 @@ var ProtoReader = class {
     }
     return Number(BigInt.asIntN(64, value));
   }
-  view(size) {
+  /** Copies a fixed-width field into the scratch buffer (little-endian, as the wire is). */
+  fixed(size) {
     if (this.end - this.pos < size) throw new MalformedProto("fixed field runs past the end");
-    const view = new DataView(this.buf.buffer, this.buf.byteOffset + this.pos, size);
+    for (let i = 0; i < size; i++) SCRATCH[i] = this.buf[this.pos + i];
     this.pos += size;
-    return view;
   }
   float() {
-    return this.view(4).getFloat32(0, true);
+    this.fixed(4);
+    return SCRATCH_VIEW.getFloat32(0, true);
   }
   double() {
-    return this.view(8).getFloat64(0, true);
+    this.fixed(8);
+    return SCRATCH_VIEW.getFloat64(0, true);
   }
   /** A length-delimited field's bytes (a view, not a copy). */
   bytes() {
@@ -24061,9 +24066,9 @@ var ProtoReader = class {
   }
   skip(wire) {
     if (wire === WIRE.varint) this.varint();
-    else if (wire === WIRE.fixed64) this.view(8);
+    else if (wire === WIRE.fixed64) this.fixed(8);
     else if (wire === WIRE.bytes) this.bytes();
-    else if (wire === WIRE.fixed32) this.view(4);
+    else if (wire === WIRE.fixed32) this.fixed(4);
     else throw new MalformedProto(`unsupported wire type ${wire}`);
   }
 };
@@ -24756,7 +24761,8 @@ function pickByFlags(series, options, catalogue) {
     return s;
   };
   const all = groups(series);
-  const validationName = options.validation ?? (options.train === void 0 ? void 0 : partner(all, options.train, "validation"));
+  const lookUp = options.exact !== true;
+  const validationName = options.validation ?? (options.train === void 0 || !lookUp ? void 0 : partner(all, options.train, "validation"));
   if (validationName === void 0) {
     throw new InputError([
       {
@@ -24768,7 +24774,7 @@ function pickByFlags(series, options, catalogue) {
     ]);
   }
   const validation = find(validationName, "validation");
-  const trainName = options.train ?? (options.validation === void 0 ? void 0 : partner(all, validationName, "train"));
+  const trainName = options.train ?? (options.validation === void 0 || !lookUp ? void 0 : partner(all, validationName, "train"));
   const train = trainName === void 0 ? void 0 : find(trainName, "train");
   const warnings = [];
   if (train === void 0) warnings.push({ code: "no-train-series", validation: validation.name });

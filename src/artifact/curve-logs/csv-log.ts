@@ -19,6 +19,7 @@ export interface CsvLogOptions {
 
 /** Cells of one CSV line (RFC 4180 quoting, without line breaks inside quotes); null when a quote is left open. */
 export function splitCsvLine(line: string): string[] | null {
+  if (!line.includes('"')) return line.split(',').map((cell) => cell.trim());
   const cells: string[] = [];
   let cell = '';
   let quoted = false;

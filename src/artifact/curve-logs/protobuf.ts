@@ -17,6 +17,9 @@ export class MalformedProto extends Error {
 
 export const WIRE = { varint: 0, fixed64: 1, bytes: 2, fixed32: 5 } as const;
 
+const SCRATCH = new Uint8Array(8);
+const SCRATCH_VIEW = new DataView(SCRATCH.buffer);
+
 export class ProtoReader {
   private pos: number;
   private readonly end: number;
@@ -70,19 +73,21 @@ export class ProtoReader {
     return Number(BigInt.asIntN(64, value));
   }
 
-  private view(size: number): DataView {
+  /** Copies a fixed-width field into the scratch buffer (little-endian, as the wire is). */
+  private fixed(size: number): void {
     if (this.end - this.pos < size) throw new MalformedProto('fixed field runs past the end');
-    const view = new DataView(this.buf.buffer, this.buf.byteOffset + this.pos, size);
+    for (let i = 0; i < size; i++) SCRATCH[i] = this.buf[this.pos + i] as number;
     this.pos += size;
-    return view;
   }
 
   float(): number {
-    return this.view(4).getFloat32(0, true);
+    this.fixed(4);
+    return SCRATCH_VIEW.getFloat32(0, true);
   }
 
   double(): number {
-    return this.view(8).getFloat64(0, true);
+    this.fixed(8);
+    return SCRATCH_VIEW.getFloat64(0, true);
   }
 
   /** A length-delimited field's bytes (a view, not a copy). */
@@ -96,9 +101,9 @@ export class ProtoReader {
 
   skip(wire: number): void {
     if (wire === WIRE.varint) this.varint();
-    else if (wire === WIRE.fixed64) this.view(8);
+    else if (wire === WIRE.fixed64) this.fixed(8);
     else if (wire === WIRE.bytes) this.bytes();
-    else if (wire === WIRE.fixed32) this.view(4);
+    else if (wire === WIRE.fixed32) this.fixed(4);
     else throw new MalformedProto(`unsupported wire type ${wire}`);
   }
 }
