@@ -25004,7 +25004,7 @@ async function search(fs, root, match, want) {
         const rel = dir.rel === "" ? e.name : `${dir.rel}/${e.name}`;
         const path = join3(dir.path, e.name);
         if (e.kind === want && match(e.name))
-          found.push({ path, display: joinDisplay(root.display, rel) });
+          found.push({ path, display: joinDisplay(root.display, rel), rel });
         if (e.kind === "dir" && e.name !== ".trash" && e.name !== "node_modules")
           next.push({ path, rel });
       }
@@ -25128,7 +25128,7 @@ async function readMlflowLogs(fs, paths, budget) {
       );
     catalogueFile ||= metrics.display;
     for (const f of await search(fs, metrics, () => true, "file")) {
-      const key = f.display.slice(metrics.display.replace(/[\\/]+$/, "").length + 1);
+      const key = f.rel;
       results.push(
         readMlflowMetric(await readLogFile(fs, f, MAX_TEXT_BYTES), f.display, key, { budget })
       );

@@ -92,8 +92,8 @@ async function search(
   root: LogPath,
   match: (name: string) => boolean,
   want: 'file' | 'dir',
-): Promise<LogPath[]> {
-  const found: LogPath[] = [];
+): Promise<(LogPath & { rel: string })[]> {
+  const found: (LogPath & { rel: string })[] = [];
   let queue: { path: string; rel: string }[] = [{ path: root.path, rel: '' }];
   let seen = 0;
   for (let depth = 0; depth <= MAX_DEPTH && queue.length > 0; depth++) {
@@ -111,7 +111,7 @@ async function search(
         const rel = dir.rel === '' ? e.name : `${dir.rel}/${e.name}`;
         const path = join(dir.path, e.name);
         if (e.kind === want && match(e.name))
-          found.push({ path, display: joinDisplay(root.display, rel) });
+          found.push({ path, display: joinDisplay(root.display, rel), rel });
         if (e.kind === 'dir' && e.name !== '.trash' && e.name !== 'node_modules')
           next.push({ path, rel });
       }
@@ -257,7 +257,7 @@ async function readMlflowLogs(fs: CurveLogFs, paths: LogPath[], budget: PointBud
       );
     catalogueFile ||= metrics.display;
     for (const f of await search(fs, metrics, () => true, 'file')) {
-      const key = f.display.slice(metrics.display.replace(/[\\/]+$/, '').length + 1);
+      const key = f.rel;
       results.push(
         readMlflowMetric(await readLogFile(fs, f, MAX_TEXT_BYTES), f.display, key, { budget }),
       );

@@ -151,6 +151,13 @@ describe('readCurveLogs', () => {
       { x: 0, train: 0.5, validation: 0.75 },
       { x: 1, train: 0.25, validation: 0.5 },
     ]);
+    // Run from inside the metrics folder: keys are still the paths under it.
+    const inside = await readCurveLogs(
+      'mlflow',
+      [{ path: join(root, 'mlruns/0/a1/metrics'), display: '.' }],
+      nodeCurveLogFs,
+    );
+    expect(inside.read.series.map((s) => s.name).sort()).toEqual(['train/loss', 'val/loss']);
     const files = await readCurveLogs(
       'mlflow',
       [at(root, 'mlruns/0/a1/metrics/train/loss'), at(root, 'mlruns/0/b2/metrics/val_loss')],
