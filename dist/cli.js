@@ -24167,6 +24167,14 @@ function readTfRecords(bytes, file) {
 
 // src/artifact/curve-logs/tensorboard.ts
 var DT = { float: 1, double: 2, int32: 3, int64: 9, half: 19 };
+function shortestFloat32(value) {
+  if (!Number.isFinite(value) || value === 0) return value;
+  for (let digits = 1; digits <= 9; digits++) {
+    const candidate = Number(value.toPrecision(digits));
+    if (Math.fround(candidate) === value) return candidate;
+  }
+  return value;
+}
 function halfToNumber(bits) {
   const sign = bits & 32768 ? -1 : 1;
   const exponent = bits >> 10 & 31;
@@ -24197,7 +24205,7 @@ function fromContent(content, dtype) {
   const width = { [DT.float]: 4, [DT.double]: 8, [DT.int32]: 4, [DT.int64]: 8, [DT.half]: 2 }[dtype];
   if (width === void 0 || content.length !== width) return void 0;
   const view = new DataView(content.buffer, content.byteOffset, width);
-  if (dtype === DT.float) return view.getFloat32(0, true);
+  if (dtype === DT.float) return shortestFloat32(view.getFloat32(0, true));
   if (dtype === DT.double) return view.getFloat64(0, true);
   if (dtype === DT.int32) return view.getInt32(0, true);
   if (dtype === DT.int64) return Number(view.getBigInt64(0, true));
@@ -24214,7 +24222,7 @@ function scalarOfTensor(bytes) {
     if (field === 1 && wire === WIRE.varint) dtype = reader.varint();
     else if (field === 2 && wire === WIRE.bytes) size = shapeSize(reader.bytes());
     else if (field === 4 && wire === WIRE.bytes) content = reader.bytes();
-    else if (field === 5) readRepeated(reader, wire, WIRE.fixed32, (r) => r.float(), values);
+    else if (field === 5) readRepeated(reader, wire, WIRE.fixed32, (r) => shortestFloat32(r.float()), values);
     else if (field === 6) readRepeated(reader, wire, WIRE.fixed64, (r) => r.double(), values);
     else if (field === 7 || field === 10)
       readRepeated(reader, wire, WIRE.varint, (r) => r.int64(), values);
@@ -24248,7 +24256,7 @@ function readValue(bytes) {
   while (!reader.done()) {
     const { field, wire } = reader.tag();
     if (field === 1 && wire === WIRE.bytes) out.tag = utf8(reader.bytes());
-    else if (field === 2 && wire === WIRE.fixed32) out.value = reader.float();
+    else if (field === 2 && wire === WIRE.fixed32) out.value = shortestFloat32(reader.float());
     else if (field === 8 && wire === WIRE.bytes) out.value = scalarOfTensor(reader.bytes());
     else if (field === 9 && wire === WIRE.bytes) {
       const plugin = pluginName(reader.bytes());

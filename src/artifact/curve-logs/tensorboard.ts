@@ -11,7 +11,8 @@
  *                   tensor_content = 4 bytes; float_val = 5; double_val = 6; int_val = 7;
  *                   int64_val = 10; half_val = 13 }
  * DataType numbers: DT_FLOAT 1, DT_DOUBLE 2, DT_INT32 3, DT_INT64 9, DT_HALF 19 (types.proto).
- * x is the event's step. Pure: bytes in, series out.
+ * x is the event's step; float32 values are written as the shortest decimal that reads back as the
+ * same float32. Pure: bytes in, series out.
  */
 import { InputError } from '../../errors.js';
 import { MAX_EVENT_FILE_BYTES, MAX_SERIES } from './limits.js';
@@ -31,6 +32,19 @@ interface ScalarValue {
   /** undefined: not a numeric scalar (image, histogram, text, a longer tensor). */
   value: number | undefined;
   plugin?: string;
+}
+
+/**
+ * The shortest decimal that reads back as the same float32: a logged 0.95f is 0.949999988079071
+ * as a double, and writing that into a curve would claim digits the log never had.
+ */
+export function shortestFloat32(value: number): number {
+  if (!Number.isFinite(value) || value === 0) return value;
+  for (let digits = 1; digits <= 9; digits++) {
+    const candidate = Number(value.toPrecision(digits));
+    if (Math.fround(candidate) === value) return candidate;
+  }
+  return value;
 }
 
 function halfToNumber(bits: number): number {
@@ -67,7 +81,7 @@ function fromContent(content: Uint8Array, dtype: number): number | undefined {
   ];
   if (width === undefined || content.length !== width) return undefined;
   const view = new DataView(content.buffer, content.byteOffset, width);
-  if (dtype === DT.float) return view.getFloat32(0, true);
+  if (dtype === DT.float) return shortestFloat32(view.getFloat32(0, true));
   if (dtype === DT.double) return view.getFloat64(0, true);
   if (dtype === DT.int32) return view.getInt32(0, true);
   if (dtype === DT.int64) return Number(view.getBigInt64(0, true));
@@ -86,7 +100,7 @@ function scalarOfTensor(bytes: Uint8Array): number | undefined {
     if (field === 1 && wire === WIRE.varint) dtype = reader.varint();
     else if (field === 2 && wire === WIRE.bytes) size = shapeSize(reader.bytes());
     else if (field === 4 && wire === WIRE.bytes) content = reader.bytes();
-    else if (field === 5) readRepeated(reader, wire, WIRE.fixed32, (r) => r.float(), values);
+    else if (field === 5) readRepeated(reader, wire, WIRE.fixed32, (r) => shortestFloat32(r.float()), values);
     else if (field === 6) readRepeated(reader, wire, WIRE.fixed64, (r) => r.double(), values);
     else if (field === 7 || field === 10)
       readRepeated(reader, wire, WIRE.varint, (r) => r.int64(), values);
@@ -122,7 +136,7 @@ function readValue(bytes: Uint8Array): ScalarValue {
   while (!reader.done()) {
     const { field, wire } = reader.tag();
     if (field === 1 && wire === WIRE.bytes) out.tag = utf8(reader.bytes());
-    else if (field === 2 && wire === WIRE.fixed32) out.value = reader.float();
+    else if (field === 2 && wire === WIRE.fixed32) out.value = shortestFloat32(reader.float());
     else if (field === 8 && wire === WIRE.bytes) out.value = scalarOfTensor(reader.bytes());
     else if (field === 9 && wire === WIRE.bytes) {
       const plugin = pluginName(reader.bytes());

@@ -3,7 +3,7 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { InputError } from '../../../src/errors.js';
 import { crc32c, maskCrc } from '../../../src/artifact/curve-logs/crc32c.js';
-import { readTensorBoard } from '../../../src/artifact/curve-logs/tensorboard.js';
+import { readTensorBoard, shortestFloat32 } from '../../../src/artifact/curve-logs/tensorboard.js';
 import { readTfRecords } from '../../../src/artifact/curve-logs/tfrecord.js';
 import { crc32cBitwise, eventFile, frame, encodeEvent, mask } from './tfevents-writer.js';
 
@@ -46,7 +46,18 @@ describe('readTensorBoard', () => {
       readFileSync('test/fixtures/curve-logs/events-expected.json', 'utf8'),
     ) as Record<string, [number, number][]>;
     const result = readTensorBoard(bytes, 'fixture');
-    expect(seriesOf(bytes)).toEqual(expected);
+    const read = seriesOf(bytes);
+    expect(Object.keys(read).sort()).toEqual(Object.keys(expected).sort());
+    for (const [tag, points] of Object.entries(expected)) {
+      expect(read[tag]?.map(([x]) => x)).toEqual(points.map(([x]) => x));
+      // Doubles come back exactly; float32 values as the shortest decimal of the same float32.
+      read[tag]?.forEach(([, got], i) => {
+        const v = got as number;
+        const want = points[i]?.[1] as number;
+        expect(v === want || Math.fround(v) === want).toBe(true);
+      });
+    }
+    expect(read['loss/train']?.[0]).toEqual([0, 0.95]);
     // 6 events × (histogram + 3-element tensor) are not scalars.
     expect(result.warnings).toEqual([{ code: 'non-scalar-skipped', file: 'fixture', count: 12 }]);
   });
@@ -129,6 +140,20 @@ describe('readTensorBoard', () => {
     ]);
   });
 
+  it('writes float32 values as the shortest decimal of the same float32 (property)', () => {
+    expect(shortestFloat32(Math.fround(0.95))).toBe(0.95);
+    expect(shortestFloat32(Math.fround(1e-8))).toBe(1e-8);
+    fc.assert(
+      fc.property(fc.float({ noNaN: true, noDefaultInfinity: true }), (f) => {
+        const short = shortestFloat32(f);
+        expect(Math.fround(short)).toBe(f);
+        // At most 9 significant digits (enough for any float32).
+        expect(Number(short.toPrecision(9)) === short).toBe(true);
+      }),
+      { numRuns: 1000 },
+    );
+  });
+
   it('rejects a record that is not an Event', () => {
     const garbage = frame(Uint8Array.from([0x0f, 0xff]));
     expect(() => readTensorBoard(garbage, 'ev')).toThrow(
@@ -168,15 +193,25 @@ describe('readTensorBoard', () => {
             })),
           );
           const read = readTensorBoard(bytes, 'ev');
-          const expected = new Map<string, [number, number][]>();
+          const expected = new Map<string, { step: number; value: number; float: boolean }[]>();
           for (const e of events) {
-            const v = e.as === 'simple' ? Math.fround(e.value) : e.value;
-            if (!Number.isFinite(v)) continue; // float32 overflow: kept as a problem instead
-            expected.set(e.tag, [...(expected.get(e.tag) ?? []), [e.step, v]]);
+            const float = e.as === 'simple';
+            // float32 overflow becomes infinity: kept as a problem of the series instead.
+            if (float && !Number.isFinite(Math.fround(e.value))) continue;
+            expected.set(e.tag, [
+              ...(expected.get(e.tag) ?? []),
+              { step: e.step, value: e.value, float },
+            ]);
           }
           for (const [name, points] of expected) {
             const s = read.series.find((x) => x.name === name);
-            expect(s?.points.map((p) => [p.x, p.value])).toEqual(points);
+            expect(s?.points.map((p) => p.x)).toEqual(points.map((p) => p.step));
+            points.forEach((p, i) => {
+              const got = s?.points[i]?.value as number;
+              // Doubles exactly; float32 as the shortest decimal of the same float32.
+              if (p.float) expect(Math.fround(got)).toBe(Math.fround(p.value));
+              else expect(got).toBe(p.value);
+            });
           }
         },
       ),
