@@ -24222,7 +24222,8 @@ function scalarOfTensor(bytes) {
     if (field === 1 && wire === WIRE.varint) dtype = reader.varint();
     else if (field === 2 && wire === WIRE.bytes) size = shapeSize(reader.bytes());
     else if (field === 4 && wire === WIRE.bytes) content = reader.bytes();
-    else if (field === 5) readRepeated(reader, wire, WIRE.fixed32, (r) => shortestFloat32(r.float()), values);
+    else if (field === 5)
+      readRepeated(reader, wire, WIRE.fixed32, (r) => shortestFloat32(r.float()), values);
     else if (field === 6) readRepeated(reader, wire, WIRE.fixed64, (r) => r.double(), values);
     else if (field === 7 || field === 10)
       readRepeated(reader, wire, WIRE.varint, (r) => r.int64(), values);
@@ -24444,6 +24445,7 @@ function readEvalsResult(input, file, options = {}) {
   if (!isObject(doc) || Object.keys(doc).length === 0)
     throw shape("", "must be an object of eval sets, each an object of metric arrays", doc);
   const series = [];
+  const names = /* @__PURE__ */ new Set();
   for (const [set, metrics] of Object.entries(doc)) {
     const setPointer = `/${escapePointer(set)}`;
     if (!isObject(metrics))
@@ -24458,8 +24460,12 @@ function readEvalsResult(input, file, options = {}) {
         throw shape(path, "must be an array with one value per boosting round", values);
       if (series.length >= MAX_SERIES)
         throw shape(path, `must hold at most ${MAX_SERIES} eval-set metrics`, metric);
+      const name = `${set}/${metric}`;
+      if (names.has(name))
+        throw shape(path, `must give a series name of its own, but "${name}" is taken`, metric);
+      names.add(name);
       const s = {
-        name: `${set}/${metric}`,
+        name,
         file,
         x: "round",
         where: { kind: "json", path },
@@ -24544,21 +24550,21 @@ function stepsToEpochs(read, file) {
 
 // src/artifact/curve-logs/names.ts
 var TRAIN_WORDS = /* @__PURE__ */ new Set(["train", "training", "learn", "trn"]);
-var VALIDATION_RANK = {
-  val: 0,
-  valid: 0,
-  validation: 0,
-  eval: 0,
-  evaluation: 0,
-  dev: 0,
-  test: 3
-};
+var VALIDATION_RANK = /* @__PURE__ */ new Map([
+  ["val", 0],
+  ["valid", 0],
+  ["validation", 0],
+  ["eval", 0],
+  ["evaluation", 0],
+  ["dev", 0],
+  ["test", 3]
+]);
 var NUMBERED = /^(?:val|valid|validation|eval)_(\d+)$/;
 var NOT_A_METRIC = /^(?:epochs?|steps?|global_step|iter(?:ation)?s?|batch(?:es)?|lr|learning_rate|lr[-_].*|time.*|duration|hp_metric|momentum|weight_decay|grad_norm)$/;
 function roleOfWord(word) {
   const w = word.toLowerCase();
   if (TRAIN_WORDS.has(w)) return { role: "train", rank: 0 };
-  const rank = VALIDATION_RANK[w];
+  const rank = VALIDATION_RANK.get(w);
   if (rank !== void 0) return { role: "validation", rank };
   const numbered = NUMBERED.exec(w);
   if (numbered?.[1] !== void 0)
@@ -24619,8 +24625,8 @@ function parseName(name) {
 }
 
 // src/artifact/curve-logs/units.ts
-var FAMILY = {};
-var add = (family, names) => names.forEach((n) => FAMILY[n] = family);
+var FAMILY = /* @__PURE__ */ new Map();
+var add = (family, names) => names.forEach((n) => FAMILY.set(n, family));
 add("accuracy", [
   "accuracy",
   "acc",
@@ -24664,17 +24670,17 @@ function normalizeMetricName(name) {
 }
 function familyOf(name) {
   const leaf = name.slice(name.lastIndexOf("/") + 1);
-  return FAMILY[normalizeMetricName(leaf)];
+  return FAMILY.get(normalizeMetricName(leaf));
 }
 function isLoss(family) {
   return family === "loss" || family === "logloss";
 }
-var CONVERSIONS = {
-  "accuracy>error": "one-minus",
-  "error>accuracy": "one-minus",
-  "mse>rmse": "sqrt",
-  "rmse>mse": "square"
-};
+var CONVERSIONS = /* @__PURE__ */ new Map([
+  ["accuracy>error", "one-minus"],
+  ["error>accuracy", "one-minus"],
+  ["mse>rmse", "sqrt"],
+  ["rmse>mse", "square"]
+]);
 function convert(conversion, value) {
   if (conversion === "one-minus") return 1 - value;
   if (conversion === "sqrt") return Math.sqrt(value);
@@ -24688,7 +24694,7 @@ function matchScore(base, metric) {
   const mf = familyOf(m);
   if (bf === void 0 || mf === void 0) return void 0;
   if (bf === mf) return 1;
-  return CONVERSIONS[`${bf}>${mf}`] === void 0 ? void 0 : 2;
+  return CONVERSIONS.has(`${bf}>${mf}`) ? 2 : void 0;
 }
 function unitsFor(base, series, metric) {
   const bf = familyOf(base);
@@ -24700,7 +24706,7 @@ function unitsFor(base, series, metric) {
   const score = matchScore(base, metric);
   if (score === 0 || score === 1) return {};
   const mf = familyOf(metric);
-  const conversion = bf !== void 0 && mf !== void 0 ? CONVERSIONS[`${bf}>${mf}`] : void 0;
+  const conversion = bf !== void 0 && mf !== void 0 ? CONVERSIONS.get(`${bf}>${mf}`) : void 0;
   if (conversion !== void 0)
     return { conversion, warning: { code: "converted", series, metric, conversion } };
   if (isLoss(bf)) return { warning: { code: "loss-not-metric", series, metric } };

@@ -61,6 +61,7 @@ export function readEvalsResult(
   if (!isObject(doc) || Object.keys(doc).length === 0)
     throw shape('', 'must be an object of eval sets, each an object of metric arrays', doc);
   const series: Series[] = [];
+  const names = new Set<string>();
   for (const [set, metrics] of Object.entries(doc)) {
     const setPointer = `/${escapePointer(set)}`;
     if (!isObject(metrics))
@@ -75,8 +76,12 @@ export function readEvalsResult(
         throw shape(path, 'must be an array with one value per boosting round', values);
       if (series.length >= MAX_SERIES)
         throw shape(path, `must hold at most ${MAX_SERIES} eval-set metrics`, metric);
+      const name = `${set}/${metric}`;
+      if (names.has(name))
+        throw shape(path, `must give a series name of its own, but "${name}" is taken`, metric);
+      names.add(name);
       const s: Series = {
-        name: `${set}/${metric}`,
+        name,
         file,
         x: 'round',
         where: { kind: 'json', path },

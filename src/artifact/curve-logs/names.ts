@@ -25,15 +25,15 @@ export interface NameParts {
 }
 
 const TRAIN_WORDS = new Set(['train', 'training', 'learn', 'trn']);
-const VALIDATION_RANK: Record<string, number> = {
-  val: 0,
-  valid: 0,
-  validation: 0,
-  eval: 0,
-  evaluation: 0,
-  dev: 0,
-  test: 3,
-};
+const VALIDATION_RANK = new Map<string, number>([
+  ['val', 0],
+  ['valid', 0],
+  ['validation', 0],
+  ['eval', 0],
+  ['evaluation', 0],
+  ['dev', 0],
+  ['test', 3],
+]);
 const NUMBERED = /^(?:val|valid|validation|eval)_(\d+)$/;
 
 /** Quantities that are not a model's quality: never picked by name. */
@@ -43,7 +43,7 @@ const NOT_A_METRIC =
 function roleOfWord(word: string): { role: Role; rank: number } | undefined {
   const w = word.toLowerCase();
   if (TRAIN_WORDS.has(w)) return { role: 'train', rank: 0 };
-  const rank = VALIDATION_RANK[w];
+  const rank = VALIDATION_RANK.get(w);
   if (rank !== undefined) return { role: 'validation', rank };
   const numbered = NUMBERED.exec(w);
   if (numbered?.[1] !== undefined)

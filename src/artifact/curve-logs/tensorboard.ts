@@ -100,7 +100,8 @@ function scalarOfTensor(bytes: Uint8Array): number | undefined {
     if (field === 1 && wire === WIRE.varint) dtype = reader.varint();
     else if (field === 2 && wire === WIRE.bytes) size = shapeSize(reader.bytes());
     else if (field === 4 && wire === WIRE.bytes) content = reader.bytes();
-    else if (field === 5) readRepeated(reader, wire, WIRE.fixed32, (r) => shortestFloat32(r.float()), values);
+    else if (field === 5)
+      readRepeated(reader, wire, WIRE.fixed32, (r) => shortestFloat32(r.float()), values);
     else if (field === 6) readRepeated(reader, wire, WIRE.fixed64, (r) => r.double(), values);
     else if (field === 7 || field === 10)
       readRepeated(reader, wire, WIRE.varint, (r) => r.int64(), values);

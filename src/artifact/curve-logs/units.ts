@@ -9,8 +9,8 @@ import type { Conversion, CurveLogWarning } from './types.js';
 export type Family =
   'accuracy' | 'error' | 'loss' | 'logloss' | 'rmse' | 'mse' | 'mae' | 'auc' | 'r2';
 
-const FAMILY: Record<string, Family> = {};
-const add = (family: Family, names: string[]) => names.forEach((n) => (FAMILY[n] = family));
+const FAMILY = new Map<string, Family>();
+const add = (family: Family, names: string[]) => names.forEach((n) => FAMILY.set(n, family));
 add('accuracy', [
   'accuracy',
   'acc',
@@ -60,19 +60,19 @@ export function normalizeMetricName(name: string): string {
 
 export function familyOf(name: string): Family | undefined {
   const leaf = name.slice(name.lastIndexOf('/') + 1);
-  return FAMILY[normalizeMetricName(leaf)];
+  return FAMILY.get(normalizeMetricName(leaf));
 }
 
 export function isLoss(family: Family | undefined): boolean {
   return family === 'loss' || family === 'logloss';
 }
 
-const CONVERSIONS: Partial<Record<`${Family}>${Family}`, Conversion>> = {
-  'accuracy>error': 'one-minus',
-  'error>accuracy': 'one-minus',
-  'mse>rmse': 'sqrt',
-  'rmse>mse': 'square',
-};
+const CONVERSIONS = new Map<string, Conversion>([
+  ['accuracy>error', 'one-minus'],
+  ['error>accuracy', 'one-minus'],
+  ['mse>rmse', 'sqrt'],
+  ['rmse>mse', 'square'],
+]);
 
 export function convert(conversion: Conversion, value: number): number {
   if (conversion === 'one-minus') return 1 - value;
@@ -89,7 +89,7 @@ export function matchScore(base: string, metric: string): number | undefined {
   const mf = familyOf(m);
   if (bf === undefined || mf === undefined) return undefined;
   if (bf === mf) return 1;
-  return CONVERSIONS[`${bf}>${mf}`] === undefined ? undefined : 2;
+  return CONVERSIONS.has(`${bf}>${mf}`) ? 2 : undefined;
 }
 
 /** The conversion into the metric's units and the warning to give for a picked series. */
@@ -109,7 +109,8 @@ export function unitsFor(
   const score = matchScore(base, metric);
   if (score === 0 || score === 1) return {};
   const mf = familyOf(metric);
-  const conversion = bf !== undefined && mf !== undefined ? CONVERSIONS[`${bf}>${mf}`] : undefined;
+  const conversion =
+    bf !== undefined && mf !== undefined ? CONVERSIONS.get(`${bf}>${mf}`) : undefined;
   if (conversion !== undefined)
     return { conversion, warning: { code: 'converted', series, metric, conversion } };
   if (isLoss(bf)) return { warning: { code: 'loss-not-metric', series, metric } };

@@ -159,6 +159,9 @@ describe('readEvalsResult', () => {
     expect(() => readEvalsResult('{"a/b": {"x~y": 3}}', 'e.json')).toThrow(
       'e.json: /a~1b/x~0y must be an array with one value per boosting round (got 3)',
     );
+    expect(() => readEvalsResult('{"a/b": {"c": [1]}, "a": {"b/c": [2]}}', 'e.json')).toThrow(
+      'e.json: /a/b~1c must give a series name of its own, but "a/b/c" is taken (got "b/c")',
+    );
     const read = readEvalsResult(
       '{"train": {"auc": [0.5, "0.6"]}, "eval": {"auc": [1, 2]}}',
       'e.json',
@@ -180,6 +183,11 @@ describe('readEvalsResult', () => {
           },
         ),
         (doc) => {
+          // Names like {"a/b": {"c": …}} and {"a": {"b/c": …}} collide; that case is tested apart.
+          const names = Object.entries(doc).flatMap(([set, m]) =>
+            Object.keys(m).map((k) => `${set}/${k}`),
+          );
+          fc.pre(new Set(names).size === names.length);
           const read = readEvalsResult(JSON.stringify(doc), 'e.json');
           for (const [set, metrics] of Object.entries(doc))
             for (const [metric, values] of Object.entries(metrics)) {

@@ -124,3 +124,21 @@ describe('pickSeries by flags', () => {
     );
   });
 });
+
+describe('names that are also Object properties', () => {
+  it('are plain names', () => {
+    expect(parseName('constructor_loss')).toMatchObject({
+      role: 'train',
+      base: 'constructor_loss',
+    });
+    expect(parseName('toString/loss')).toMatchObject({
+      role: 'train',
+      base: 'loss',
+      qualifier: 'tostring',
+    });
+    expect(pick(['constructor', 'val_constructor'], 'constructor')).toEqual([
+      'constructor',
+      'val_constructor',
+    ]);
+  });
+});
