@@ -1447,15 +1447,15 @@ var require_rules = __commonJS({
     }
     exports.isJSONType = isJSONType;
     function getRules() {
-      const groups = {
+      const groups2 = {
         number: { type: "number", rules: [] },
         string: { type: "string", rules: [] },
         array: { type: "array", rules: [] },
         object: { type: "object", rules: [] }
       };
       return {
-        types: { ...groups, integer: true, boolean: true, null: true },
-        rules: [{ rules: [] }, groups.number, groups.string, groups.array, groups.object],
+        types: { ...groups2, integer: true, boolean: true, null: true },
+        rules: [{ rules: [] }, groups2.number, groups2.string, groups2.array, groups2.object],
         post: { rules: [] },
         all: {},
         keywords: {}
@@ -2987,7 +2987,7 @@ var require_compile = __commonJS({
       const schOrFunc = root.refs[ref];
       if (schOrFunc)
         return schOrFunc;
-      let _sch = resolve4.call(this, root, ref);
+      let _sch = resolve5.call(this, root, ref);
       if (_sch === void 0) {
         const schema = (_a = root.localRefs) === null || _a === void 0 ? void 0 : _a[ref];
         const { schemaId } = this.opts;
@@ -3014,7 +3014,7 @@ var require_compile = __commonJS({
     function sameSchemaEnv(s1, s2) {
       return s1.schema === s2.schema && s1.root === s2.root && s1.baseId === s2.baseId;
     }
-    function resolve4(root, ref) {
+    function resolve5(root, ref) {
       let sch;
       while (typeof (sch = this.refs[ref]) == "string")
         ref = sch;
@@ -3878,7 +3878,7 @@ var require_fast_uri = __commonJS({
       }
       return uri;
     }
-    function resolve4(baseURI, relativeURI, options) {
+    function resolve5(baseURI, relativeURI, options) {
       const schemelessOptions = options ? Object.assign({ scheme: "null" }, options) : { scheme: "null" };
       const {
         parsed: baseParsed,
@@ -3914,50 +3914,50 @@ var require_fast_uri = __commonJS({
       schemelessOptions.skipEscape = true;
       return serialize2(resolved, schemelessOptions);
     }
-    function resolveComponent(base, relative2, options, skipNormalization) {
+    function resolveComponent(base, relative3, options, skipNormalization) {
       const target = {};
       if (!skipNormalization) {
         base = parse(serialize2(base, options), options);
-        relative2 = parse(serialize2(relative2, options), options);
+        relative3 = parse(serialize2(relative3, options), options);
       }
       options = options || {};
-      if (!options.tolerant && relative2.scheme) {
-        target.scheme = relative2.scheme;
-        target.userinfo = relative2.userinfo;
-        target.host = relative2.host;
-        target.port = relative2.port;
-        target.path = removeDotSegments(relative2.path || "");
-        target.query = relative2.query;
+      if (!options.tolerant && relative3.scheme) {
+        target.scheme = relative3.scheme;
+        target.userinfo = relative3.userinfo;
+        target.host = relative3.host;
+        target.port = relative3.port;
+        target.path = removeDotSegments(relative3.path || "");
+        target.query = relative3.query;
       } else {
-        if (relative2.userinfo !== void 0 || relative2.host !== void 0 || relative2.port !== void 0) {
-          target.userinfo = relative2.userinfo;
-          target.host = relative2.host;
-          target.port = relative2.port;
-          target.path = removeDotSegments(relative2.path || "");
-          target.query = relative2.query;
+        if (relative3.userinfo !== void 0 || relative3.host !== void 0 || relative3.port !== void 0) {
+          target.userinfo = relative3.userinfo;
+          target.host = relative3.host;
+          target.port = relative3.port;
+          target.path = removeDotSegments(relative3.path || "");
+          target.query = relative3.query;
         } else {
-          if (!relative2.path) {
+          if (!relative3.path) {
             target.path = base.path;
-            if (relative2.query !== void 0) {
-              target.query = relative2.query;
+            if (relative3.query !== void 0) {
+              target.query = relative3.query;
             } else {
               target.query = base.query;
             }
           } else {
-            if (relative2.path[0] === "/") {
-              target.path = removeDotSegments(relative2.path);
+            if (relative3.path[0] === "/") {
+              target.path = removeDotSegments(relative3.path);
             } else {
               const baseHasAuthority = base.userinfo !== void 0 || base.host !== void 0 || base.port !== void 0;
               if (baseHasAuthority && !base.path) {
-                target.path = "/" + relative2.path;
+                target.path = "/" + relative3.path;
               } else if (!base.path) {
-                target.path = relative2.path;
+                target.path = relative3.path;
               } else {
-                target.path = base.path.slice(0, base.path.lastIndexOf("/") + 1) + relative2.path;
+                target.path = base.path.slice(0, base.path.lastIndexOf("/") + 1) + relative3.path;
               }
               target.path = base.scheme === void 0 && !baseHasAuthority && target.path[0] !== "/" ? removeDotSegmentsRelative(target.path) : removeDotSegments(target.path);
             }
-            target.query = relative2.query;
+            target.query = relative3.query;
           }
           target.userinfo = base.userinfo;
           target.host = base.host;
@@ -3965,7 +3965,7 @@ var require_fast_uri = __commonJS({
         }
         target.scheme = base.scheme;
       }
-      target.fragment = relative2.fragment;
+      target.fragment = relative3.fragment;
       return target;
     }
     function equal(uriA, uriB, options) {
@@ -4269,7 +4269,7 @@ var require_fast_uri = __commonJS({
     var fastUri = {
       SCHEMES,
       normalize,
-      resolve: resolve4,
+      resolve: resolve5,
       resolveComponent,
       equal,
       serialize: serialize2,
@@ -4684,7 +4684,7 @@ var require_core = __commonJS({
       errorsText(errors = this.errors, { separator = ", ", dataVar = "data" } = {}) {
         if (!errors || errors.length === 0)
           return "No errors";
-        return errors.map((e) => `${dataVar}${e.instancePath} ${e.message}`).reduce((text, msg) => text + separator + msg);
+        return errors.map((e) => `${dataVar}${e.instancePath} ${e.message}`).reduce((text2, msg) => text2 + separator + msg);
       }
       $dataMetaSchema(metaSchema, keywordsJsonPointers) {
         const rules = this.RULES.all;
@@ -9049,14 +9049,14 @@ var require_foldFlowLines = __commonJS({
     var FOLD_FLOW = "flow";
     var FOLD_BLOCK = "block";
     var FOLD_QUOTED = "quoted";
-    function foldFlowLines(text, indent, mode = "flow", { indentAtStart, lineWidth = 80, minContentWidth = 20, onFold, onOverflow } = {}) {
+    function foldFlowLines(text2, indent, mode = "flow", { indentAtStart, lineWidth = 80, minContentWidth = 20, onFold, onOverflow } = {}) {
       if (!lineWidth || lineWidth < 0)
-        return text;
+        return text2;
       if (lineWidth < minContentWidth)
         minContentWidth = 0;
       const endStep = Math.max(1 + minContentWidth, 1 + lineWidth - indent.length);
-      if (text.length <= endStep)
-        return text;
+      if (text2.length <= endStep)
+        return text2;
       const folds = [];
       const escapedFolds = {};
       let end = lineWidth - indent.length;
@@ -9073,14 +9073,14 @@ var require_foldFlowLines = __commonJS({
       let escStart = -1;
       let escEnd = -1;
       if (mode === FOLD_BLOCK) {
-        i = consumeMoreIndentedLines(text, i, indent.length);
+        i = consumeMoreIndentedLines(text2, i, indent.length);
         if (i !== -1)
           end = i + endStep;
       }
-      for (let ch; ch = text[i += 1]; ) {
+      for (let ch; ch = text2[i += 1]; ) {
         if (mode === FOLD_QUOTED && ch === "\\") {
           escStart = i;
-          switch (text[i + 1]) {
+          switch (text2[i + 1]) {
             case "x":
               i += 3;
               break;
@@ -9097,12 +9097,12 @@ var require_foldFlowLines = __commonJS({
         }
         if (ch === "\n") {
           if (mode === FOLD_BLOCK)
-            i = consumeMoreIndentedLines(text, i, indent.length);
+            i = consumeMoreIndentedLines(text2, i, indent.length);
           end = i + indent.length + endStep;
           split = void 0;
         } else {
           if (ch === " " && prev && prev !== " " && prev !== "\n" && prev !== "	") {
-            const next = text[i + 1];
+            const next = text2[i + 1];
             if (next && next !== " " && next !== "\n" && next !== "	")
               split = i;
           }
@@ -9114,12 +9114,12 @@ var require_foldFlowLines = __commonJS({
             } else if (mode === FOLD_QUOTED) {
               while (prev === " " || prev === "	") {
                 prev = ch;
-                ch = text[i += 1];
+                ch = text2[i += 1];
                 overflow = true;
               }
               const j = i > escEnd + 1 ? i - 2 : escStart - 1;
               if (escapedFolds[j])
-                return text;
+                return text2;
               folds.push(j);
               escapedFolds[j] = true;
               end = j + endStep;
@@ -9134,39 +9134,39 @@ var require_foldFlowLines = __commonJS({
       if (overflow && onOverflow)
         onOverflow();
       if (folds.length === 0)
-        return text;
+        return text2;
       if (onFold)
         onFold();
-      let res = text.slice(0, folds[0]);
+      let res = text2.slice(0, folds[0]);
       for (let i2 = 0; i2 < folds.length; ++i2) {
         const fold = folds[i2];
-        const end2 = folds[i2 + 1] || text.length;
+        const end2 = folds[i2 + 1] || text2.length;
         if (fold === 0)
           res = `
-${indent}${text.slice(0, end2)}`;
+${indent}${text2.slice(0, end2)}`;
         else {
           if (mode === FOLD_QUOTED && escapedFolds[fold])
-            res += `${text[fold]}\\`;
+            res += `${text2[fold]}\\`;
           res += `
-${indent}${text.slice(fold + 1, end2)}`;
+${indent}${text2.slice(fold + 1, end2)}`;
         }
       }
       return res;
     }
-    function consumeMoreIndentedLines(text, i, indent) {
+    function consumeMoreIndentedLines(text2, i, indent) {
       let end = i;
       let start = i + 1;
-      let ch = text[start];
+      let ch = text2[start];
       while (ch === " " || ch === "	") {
         if (i < start + indent) {
-          ch = text[++i];
+          ch = text2[++i];
         } else {
           do {
-            ch = text[++i];
+            ch = text2[++i];
           } while (ch && ch !== "\n");
           end = i;
           start = i + 1;
-          ch = text[start];
+          ch = text2[start];
         }
       }
       return end;
@@ -10092,7 +10092,7 @@ var require_YAMLMap = __commonJS({
       static from(schema, obj, ctx) {
         const { keepUndefined, replacer } = ctx;
         const map = new this(schema);
-        const add = (key, value) => {
+        const add2 = (key, value) => {
           if (typeof replacer === "function")
             value = replacer.call(obj, key, value);
           else if (Array.isArray(replacer) && !replacer.includes(key))
@@ -10102,10 +10102,10 @@ var require_YAMLMap = __commonJS({
         };
         if (obj instanceof Map) {
           for (const [key, value] of obj)
-            add(key, value);
+            add2(key, value);
         } else if (obj && typeof obj === "object") {
           for (const key of Object.keys(obj))
-            add(key, obj[key]);
+            add2(key, obj[key]);
         }
         if (typeof schema.sortMapEntries === "function") {
           map.items.sort(schema.sortMapEntries);
@@ -12015,12 +12015,12 @@ var require_util_map_includes = __commonJS({
   "node_modules/yaml/dist/compose/util-map-includes.js"(exports) {
     "use strict";
     var identity = require_identity();
-    function mapIncludes(ctx, items, search) {
+    function mapIncludes(ctx, items, search2) {
       const { uniqueKeys } = ctx.options;
       if (uniqueKeys === false)
         return false;
       const isEqual = typeof uniqueKeys === "function" ? uniqueKeys : (a, b) => a === b || identity.isScalar(a) && identity.isScalar(b) && a.value === b.value;
-      return items.some((pair) => isEqual(pair.key, search));
+      return items.some((pair) => isEqual(pair.key, search2));
     }
     exports.mapIncludes = mapIncludes;
   }
@@ -12045,10 +12045,10 @@ var require_resolve_block_map = __commonJS({
       let offset = bm.offset;
       let commentEnd = null;
       for (const collItem of bm.items) {
-        const { start, key, sep: sep2, value } = collItem;
+        const { start, key, sep: sep3, value } = collItem;
         const keyProps = resolveProps.resolveProps(start, {
           indicator: "explicit-key-ind",
-          next: key ?? sep2?.[0],
+          next: key ?? sep3?.[0],
           offset,
           onError,
           parentIndent: bm.indent,
@@ -12062,7 +12062,7 @@ var require_resolve_block_map = __commonJS({
             else if ("indent" in key && key.indent !== bm.indent)
               onError(offset, "BAD_INDENT", startColMsg);
           }
-          if (!keyProps.anchor && !keyProps.tag && !sep2) {
+          if (!keyProps.anchor && !keyProps.tag && !sep3) {
             commentEnd = keyProps.end;
             if (keyProps.comment) {
               if (map.comment)
@@ -12086,7 +12086,7 @@ var require_resolve_block_map = __commonJS({
         ctx.atKey = false;
         if (utilMapIncludes.mapIncludes(ctx, map.items, keyNode))
           onError(keyStart, "DUPLICATE_KEY", "Map keys must be unique");
-        const valueProps = resolveProps.resolveProps(sep2 ?? [], {
+        const valueProps = resolveProps.resolveProps(sep3 ?? [], {
           indicator: "map-value-ind",
           next: value,
           offset: keyNode.range[2],
@@ -12102,7 +12102,7 @@ var require_resolve_block_map = __commonJS({
             if (ctx.options.strict && keyProps.start < valueProps.found.offset - 1024)
               onError(keyNode.range, "KEY_OVER_1024_CHARS", "The : indicator must be at most 1024 chars after the start of an implicit block mapping key");
           }
-          const valueNode = value ? composeNode(ctx, value, valueProps, onError) : composeEmptyNode(ctx, offset, sep2, null, valueProps, onError);
+          const valueNode = value ? composeNode(ctx, value, valueProps, onError) : composeEmptyNode(ctx, offset, sep3, null, valueProps, onError);
           if (ctx.schema.compat)
             utilFlowIndentCheck.flowIndentCheck(bm.indent, value, onError);
           offset = valueNode.range[2];
@@ -12193,7 +12193,7 @@ var require_resolve_end = __commonJS({
       let comment = "";
       if (end) {
         let hasSpace = false;
-        let sep2 = "";
+        let sep3 = "";
         for (const token of end) {
           const { source, type } = token;
           switch (type) {
@@ -12207,13 +12207,13 @@ var require_resolve_end = __commonJS({
               if (!comment)
                 comment = cb;
               else
-                comment += sep2 + cb;
-              sep2 = "";
+                comment += sep3 + cb;
+              sep3 = "";
               break;
             }
             case "newline":
               if (comment)
-                sep2 += source;
+                sep3 += source;
               hasSpace = true;
               break;
             default:
@@ -12256,18 +12256,18 @@ var require_resolve_flow_collection = __commonJS({
       let offset = fc.offset + fc.start.source.length;
       for (let i = 0; i < fc.items.length; ++i) {
         const collItem = fc.items[i];
-        const { start, key, sep: sep2, value } = collItem;
+        const { start, key, sep: sep3, value } = collItem;
         const props = resolveProps.resolveProps(start, {
           flow: fcName,
           indicator: "explicit-key-ind",
-          next: key ?? sep2?.[0],
+          next: key ?? sep3?.[0],
           offset,
           onError,
           parentIndent: fc.indent,
           startOnNewline: false
         });
         if (!props.found) {
-          if (!props.anchor && !props.tag && !sep2 && !value) {
+          if (!props.anchor && !props.tag && !sep3 && !value) {
             if (i === 0 && props.comma)
               onError(props.comma, "UNEXPECTED_TOKEN", `Unexpected , in ${fcName}`);
             else if (i < fc.items.length - 1)
@@ -12321,8 +12321,8 @@ var require_resolve_flow_collection = __commonJS({
             }
           }
         }
-        if (!isMap && !sep2 && !props.found) {
-          const valueNode = value ? composeNode(ctx, value, props, onError) : composeEmptyNode(ctx, props.end, sep2, null, props, onError);
+        if (!isMap && !sep3 && !props.found) {
+          const valueNode = value ? composeNode(ctx, value, props, onError) : composeEmptyNode(ctx, props.end, sep3, null, props, onError);
           coll.items.push(valueNode);
           offset = valueNode.range[2];
           if (isBlock(value))
@@ -12334,7 +12334,7 @@ var require_resolve_flow_collection = __commonJS({
           if (isBlock(key))
             onError(keyNode.range, "BLOCK_IN_FLOW", blockMsg);
           ctx.atKey = false;
-          const valueProps = resolveProps.resolveProps(sep2 ?? [], {
+          const valueProps = resolveProps.resolveProps(sep3 ?? [], {
             flow: fcName,
             indicator: "map-value-ind",
             next: value,
@@ -12345,8 +12345,8 @@ var require_resolve_flow_collection = __commonJS({
           });
           if (valueProps.found) {
             if (!isMap && !props.found && ctx.options.strict) {
-              if (sep2)
-                for (const st of sep2) {
+              if (sep3)
+                for (const st of sep3) {
                   if (st === valueProps.found)
                     break;
                   if (st.type === "newline") {
@@ -12363,7 +12363,7 @@ var require_resolve_flow_collection = __commonJS({
             else
               onError(valueProps.start, "MISSING_CHAR", `Missing , or : between ${fcName} items`);
           }
-          const valueNode = value ? composeNode(ctx, value, valueProps, onError) : valueProps.found ? composeEmptyNode(ctx, valueProps.end, sep2, null, valueProps, onError) : null;
+          const valueNode = value ? composeNode(ctx, value, valueProps, onError) : valueProps.found ? composeEmptyNode(ctx, valueProps.end, sep3, null, valueProps, onError) : null;
           if (valueNode) {
             if (isBlock(value))
               onError(valueNode.range, "BLOCK_IN_FLOW", blockMsg);
@@ -12543,7 +12543,7 @@ var require_resolve_block_scalar = __commonJS({
           chompStart = i + 1;
       }
       let value = "";
-      let sep2 = "";
+      let sep3 = "";
       let prevMoreIndented = false;
       for (let i = 0; i < contentStart; ++i)
         value += lines[i][0].slice(trimIndent) + "\n";
@@ -12560,24 +12560,24 @@ var require_resolve_block_scalar = __commonJS({
           indent = "";
         }
         if (type === Scalar.Scalar.BLOCK_LITERAL) {
-          value += sep2 + indent.slice(trimIndent) + content;
-          sep2 = "\n";
+          value += sep3 + indent.slice(trimIndent) + content;
+          sep3 = "\n";
         } else if (indent.length > trimIndent || content[0] === "	") {
-          if (sep2 === " ")
-            sep2 = "\n";
-          else if (!prevMoreIndented && sep2 === "\n")
-            sep2 = "\n\n";
-          value += sep2 + indent.slice(trimIndent) + content;
-          sep2 = "\n";
+          if (sep3 === " ")
+            sep3 = "\n";
+          else if (!prevMoreIndented && sep3 === "\n")
+            sep3 = "\n\n";
+          value += sep3 + indent.slice(trimIndent) + content;
+          sep3 = "\n";
           prevMoreIndented = true;
         } else if (content === "") {
-          if (sep2 === "\n")
+          if (sep3 === "\n")
             value += "\n";
           else
-            sep2 = "\n";
+            sep3 = "\n";
         } else {
-          value += sep2 + content;
-          sep2 = " ";
+          value += sep3 + content;
+          sep3 = " ";
           prevMoreIndented = false;
         }
       }
@@ -12760,25 +12760,25 @@ var require_resolve_flow_scalar = __commonJS({
         trimBoth = /^[ \t]+|[ \t]+$/g;
       }
       let res = match[1].replace(trimEnd, "");
-      let sep2 = " ";
+      let sep3 = " ";
       let pos = line.lastIndex;
       while (match = line.exec(source)) {
         const lm = match[1].replace(trimBoth, "");
         if (lm === "") {
-          if (sep2 === "\n")
-            res += sep2;
+          if (sep3 === "\n")
+            res += sep3;
           else
-            sep2 = "\n";
+            sep3 = "\n";
         } else {
-          res += sep2 + lm;
-          sep2 = " ";
+          res += sep3 + lm;
+          sep3 = " ";
         }
         pos = line.lastIndex;
       }
       const last = /[ \t]*(.*)/sy;
       last.lastIndex = pos;
       match = last.exec(source);
-      return res + sep2 + (match?.[1] ?? "");
+      return res + sep3 + (match?.[1] ?? "");
     }
     function doubleQuotedValue(source, onError) {
       let res = "";
@@ -13588,14 +13588,14 @@ var require_cst_stringify = __commonJS({
         }
       }
     }
-    function stringifyItem({ start, key, sep: sep2, value }) {
+    function stringifyItem({ start, key, sep: sep3, value }) {
       let res = "";
       for (const st of start)
         res += st.source;
       if (key)
         res += stringifyToken(key);
-      if (sep2)
-        for (const st of sep2)
+      if (sep3)
+        for (const st of sep3)
           res += st.source;
       if (value)
         res += stringifyToken(value);
@@ -14762,18 +14762,18 @@ var require_parser = __commonJS({
         if (this.type === "map-value-ind") {
           const prev = getPrevProps(this.peek(2));
           const start = getFirstKeyStartProps(prev);
-          let sep2;
+          let sep3;
           if (scalar.end) {
-            sep2 = scalar.end;
-            sep2.push(this.sourceToken);
+            sep3 = scalar.end;
+            sep3.push(this.sourceToken);
             delete scalar.end;
           } else
-            sep2 = [this.sourceToken];
+            sep3 = [this.sourceToken];
           const map = {
             type: "block-map",
             offset: scalar.offset,
             indent: scalar.indent,
-            items: [{ start, key: scalar, sep: sep2 }]
+            items: [{ start, key: scalar, sep: sep3 }]
           };
           this.onKeyLine = true;
           this.stack[this.stack.length - 1] = map;
@@ -14926,15 +14926,15 @@ var require_parser = __commonJS({
                 } else if (isFlowToken(it.key) && !includesToken(it.sep, "newline")) {
                   const start2 = getFirstKeyStartProps(it.start);
                   const key = it.key;
-                  const sep2 = it.sep;
-                  sep2.push(this.sourceToken);
+                  const sep3 = it.sep;
+                  sep3.push(this.sourceToken);
                   delete it.key;
                   delete it.sep;
                   this.stack.push({
                     type: "block-map",
                     offset: this.offset,
                     indent: this.indent,
-                    items: [{ start: start2, key, sep: sep2 }]
+                    items: [{ start: start2, key, sep: sep3 }]
                   });
                 } else if (start.length > 0) {
                   it.sep = it.sep.concat(start, this.sourceToken);
@@ -15128,13 +15128,13 @@ var require_parser = __commonJS({
             const prev = getPrevProps(parent);
             const start = getFirstKeyStartProps(prev);
             fixFlowSeqItems(fc);
-            const sep2 = fc.end.splice(1, fc.end.length);
-            sep2.push(this.sourceToken);
+            const sep3 = fc.end.splice(1, fc.end.length);
+            sep3.push(this.sourceToken);
             const map = {
               type: "block-map",
               offset: fc.offset,
               indent: fc.indent,
-              items: [{ start, key: fc, sep: sep2 }]
+              items: [{ start, key: fc, sep: sep3 }]
             };
             this.onKeyLine = true;
             this.stack[this.stack.length - 1] = map;
@@ -17852,7 +17852,7 @@ var require_jstat = __commonJS({
         }
         jStat4.extend({
           // add a vector/matrix to a vector/matrix or scalar
-          add: function add(arr, arg) {
+          add: function add2(arr, arg) {
             if (isUsable(arg)) {
               if (!isUsable(arg[0])) arg = [arg];
               return jStat4.map(arr, function(value, row, col) {
@@ -19278,24 +19278,24 @@ var EXIT = {
 };
 function formatIssue(issue) {
   const where = issue.pointer === "" ? issue.file : `${issue.file}: ${issue.pointer}`;
-  let text = `${where} ${issue.expected}`;
-  if (issue.got !== void 0) text += ` (got ${issue.got})`;
-  text += ".";
-  if (issue.hint !== void 0) text += ` ${issue.hint}`;
-  return text;
+  let text2 = `${where} ${issue.expected}`;
+  if (issue.got !== void 0) text2 += ` (got ${issue.got})`;
+  text2 += ".";
+  if (issue.hint !== void 0) text2 += ` ${issue.hint}`;
+  return text2;
 }
 function quote(value) {
-  let text;
-  if (typeof value === "string") text = JSON.stringify(value);
-  else if (typeof value === "number" && !Number.isFinite(value)) text = String(value);
+  let text2;
+  if (typeof value === "string") text2 = JSON.stringify(value);
+  else if (typeof value === "number" && !Number.isFinite(value)) text2 = String(value);
   else {
     try {
-      text = JSON.stringify(value) ?? String(value);
+      text2 = JSON.stringify(value) ?? String(value);
     } catch {
-      text = String(value);
+      text2 = String(value);
     }
   }
-  return text.length > 60 ? `${text.slice(0, 57)}...` : text;
+  return text2.length > 60 ? `${text2.slice(0, 57)}...` : text2;
 }
 var InputError = class extends Error {
   issues;
@@ -19327,8 +19327,8 @@ import { dirname, relative, resolve, sep } from "node:path";
 function splitCsvLine(line) {
   return line.split(",").map((cell) => cell.trim().replace(/^"(.*)"$/, "$1"));
 }
-function parseEpochLog(text, file, mapping) {
-  const lines = text.replace(/^\uFEFF/, "").split(/\r?\n/);
+function parseEpochLog(text2, file, mapping) {
+  const lines = text2.replace(/^\uFEFF/, "").split(/\r?\n/);
   const header = splitCsvLine(lines[0] ?? "");
   const column = (name, role) => {
     if (name === void 0) return void 0;
@@ -19389,35 +19389,35 @@ function parseEpochLog(text, file, mapping) {
 }
 
 // src/artifact/read-json.ts
-function lineAndColumn(text, offset) {
+function lineAndColumn(text2, offset) {
   let line = 1;
   let last = -1;
-  for (let i = 0; i < offset && i < text.length; i++) {
-    if (text.charCodeAt(i) === 10) {
+  for (let i = 0; i < offset && i < text2.length; i++) {
+    if (text2.charCodeAt(i) === 10) {
       line++;
       last = i;
     }
   }
   return { line, column: offset - last };
 }
-function errorOffset(text, message) {
+function errorOffset(text2, message) {
   const position = /position (\d+)/.exec(message);
   if (position?.[1] !== void 0) return Number(position[1]);
-  if (/Unexpected end of JSON input/.test(message)) return text.length;
+  if (/Unexpected end of JSON input/.test(message)) return text2.length;
   const context = /Unexpected token '(.)', (?:\.\.\.)?"([\s\S]*?)"(?:\.\.\.)? is not valid JSON/.exec(message);
   if (context?.[1] !== void 0 && context[2] !== void 0) {
-    const at = text.indexOf(context[2]);
+    const at = text2.indexOf(context[2]);
     if (at >= 0) return at + Math.max(0, context[2].indexOf(context[1]));
   }
   return null;
 }
-function parseJson(text, file) {
+function parseJson(text2, file) {
   try {
-    return JSON.parse(text.charCodeAt(0) === 65279 ? text.slice(1) : text);
+    return JSON.parse(text2.charCodeAt(0) === 65279 ? text2.slice(1) : text2);
   } catch (error) {
     const message = error instanceof Error ? error.message : String(error);
-    const offset = errorOffset(text, message);
-    const where = offset === null ? void 0 : lineAndColumn(text, offset);
+    const offset = errorOffset(text2, message);
+    const where = offset === null ? void 0 : lineAndColumn(text2, offset);
     throw new InputError([
       {
         file,
@@ -20084,10 +20084,10 @@ async function loadRun(path, options = {}) {
           `${file}: the artifact has its own curves.epochs; the epoch log ${logName} was not used.`
         );
       } else {
-        const text = (await readText(logPath, logName, "an epoch log (CSV)")).toString("utf8");
+        const text2 = (await readText(logPath, logName, "an epoch log (CSV)")).toString("utf8");
         artifact.curves = {
           ...artifact.curves,
-          epochs: parseEpochLog(text, logName, options.epochLog)
+          epochs: parseEpochLog(text2, logName, options.epochLog)
         };
         const issues = semanticIssues(artifact, `${file} (with ${logName})`);
         if (issues.length > 0) throw new InputError(issues);
@@ -20254,8 +20254,8 @@ function failOnIssues(values, file, pointer) {
     ]
   );
 }
-function parseConfig(text, file) {
-  const document = (0, import_yaml.parseDocument)(text, { prettyErrors: true });
+function parseConfig(text2, file) {
+  const document = (0, import_yaml.parseDocument)(text2, { prettyErrors: true });
   if (document.errors.length > 0) {
     throw new InputError(
       document.errors.slice(0, 10).map((error) => ({
@@ -20284,9 +20284,9 @@ function parseConfig(text, file) {
   return data;
 }
 async function loadConfig(path, file, required) {
-  let text;
+  let text2;
   try {
-    text = await readFile2(path, "utf8");
+    text2 = await readFile2(path, "utf8");
   } catch (error) {
     const code = error.code;
     if (!required && code === "ENOENT") return null;
@@ -20300,7 +20300,7 @@ async function loadConfig(path, file, required) {
       }
     ]);
   }
-  return { config: parseConfig(text, file), text };
+  return { config: parseConfig(text2, file), text: text2 };
 }
 
 // src/io/review-from-files.ts
@@ -20905,11 +20905,11 @@ var XTOL = 1e-15;
 var GTOL = 1e-15;
 var OFFSET_TOLERANCE = 1e-5;
 var PLATEAU_PROBE = 0.1;
-function fitLeastSquares(problem) {
-  const { x, y, start, model } = problem;
+function fitLeastSquares(problem2) {
+  const { x, y, start, model } = problem2;
   const nParams = start.length;
-  const lower = start.map((_, j) => problem.bounds?.lower?.[j] ?? -Infinity);
-  const upper = start.map((_, j) => problem.bounds?.upper?.[j] ?? Infinity);
+  const lower = start.map((_, j) => problem2.bounds?.lower?.[j] ?? -Infinity);
+  const upper = start.map((_, j) => problem2.bounds?.upper?.[j] ?? Infinity);
   const clamp = (p2) => p2.map((v, j) => Math.min(Math.max(v, lower[j]), upper[j]));
   const evaluate = (p2) => {
     const r = y.map((yi, i) => yi - model(p2, x[i]));
@@ -20918,14 +20918,14 @@ function fitLeastSquares(problem) {
     return { r, rss };
   };
   const jacobianAt = (p2) => x.map(
-    (xi) => problem.jacobian ? problem.jacobian(p2, xi) : centralDifference(model, p2, xi, start, lower, upper)
+    (xi) => problem2.jacobian ? problem2.jacobian(p2, xi) : centralDifference(model, p2, xi, start, lower, upper)
   );
   let p = clamp(start);
   let state = evaluate(p);
   if (!Number.isFinite(state.rss)) {
-    return verdict(problem, p, state, 0, "non-finite", lower, upper, evaluate, jacobianAt);
+    return verdict(problem2, p, state, 0, "non-finite", lower, upper, evaluate, jacobianAt);
   }
-  const maxIterations = problem.maxIterations ?? 1e3;
+  const maxIterations = problem2.maxIterations ?? 1e3;
   let mu = 1e-3;
   let nu = 2;
   const d = new Array(nParams).fill(0);
@@ -20992,7 +20992,7 @@ function fitLeastSquares(problem) {
       }
     }
   }
-  return verdict(problem, p, state, iteration, stop, lower, upper, evaluate, jacobianAt);
+  return verdict(problem2, p, state, iteration, stop, lower, upper, evaluate, jacobianAt);
 }
 function centralDifference(model, p, xi, start, lower, upper) {
   return p.map((pj, j) => {
@@ -21056,8 +21056,8 @@ function scaledNorm(v, d) {
   v.forEach((vi, j) => s = Math.hypot(s, vi * (d[j] > 0 ? d[j] : 1)));
   return s;
 }
-function verdict(problem, p, state, iterations, stop, lower, upper, evaluate, jacobianAt) {
-  const n = problem.y.length;
+function verdict(problem2, p, state, iterations, stop, lower, upper, evaluate, jacobianAt) {
+  const n = problem2.y.length;
   const nParams = p.length;
   const base = { params: p, rss: state.rss, iterations, stop };
   if (!Number.isFinite(state.rss)) {
@@ -21082,7 +21082,7 @@ function verdict(problem, p, state, iterations, stop, lower, upper, evaluate, ja
   const flat = p.map((pj, j) => {
     if (!free.includes(j)) return false;
     if (norms[j] === 0) return true;
-    const h = PLATEAU_PROBE * Math.max(Math.abs(pj), Math.abs(problem.start[j]));
+    const h = PLATEAU_PROBE * Math.max(Math.abs(pj), Math.abs(problem2.start[j]));
     if (h === 0) return false;
     const probe = (v) => {
       const q = p.slice();
@@ -21105,7 +21105,7 @@ function verdict(problem, p, state, iterations, stop, lower, upper, evaluate, ja
     const q2 = Math.hypot(...qr.qtb.slice(free.length));
     if (q2 > 0) relativeOffset = q1 / Math.sqrt(free.length) / (q2 / Math.sqrt(dof));
   }
-  const yNorm = Math.hypot(...problem.y);
+  const yNorm = Math.hypot(...problem2.y);
   const zeroResidual = Math.sqrt(state.rss) <= 1e-10 * yNorm;
   const inverse = qr ? inverseOfRtR(qr.r) : null;
   let covariance = null;
@@ -21121,7 +21121,7 @@ function verdict(problem, p, state, iterations, stop, lower, upper, evaluate, ja
   let reason;
   let converged = false;
   const flatAt = flat.flatMap(
-    (f, j) => f ? [`${problem.names?.[j] ?? `p${j + 1}`} = ${p[j].toPrecision(4)}`] : []
+    (f, j) => f ? [`${problem2.names?.[j] ?? `p${j + 1}`} = ${p[j].toPrecision(4)}`] : []
   );
   if (stop === "max-iterations") reason = `no convergence within ${iterations} iterations`;
   else if (flatAt.length > 0)
@@ -21776,7 +21776,7 @@ function chooseLevers(ctx) {
   const v = (x) => formatValue(x, kind);
   const curves = ctx.candidate.curves;
   const drafts = /* @__PURE__ */ new Map();
-  const add = (id, score, reason, evidence = []) => {
+  const add2 = (id, score, reason, evidence = []) => {
     const existing = drafts.get(id);
     if (existing === void 0 || existing.score < score)
       drafts.set(id, { id, reason, evidence, score });
@@ -21799,7 +21799,7 @@ function chooseLevers(ctx) {
     const overshotTowardBias = ctx.movement === "toward-underfitting" || ctx.movement === "worse-on-both";
     const overshotTowardVariance = ctx.movement === "toward-overfitting" || ctx.movement === "worse-on-both";
     if (p.lever === "stronger-regularization" && overshotTowardBias) {
-      add(
+      add2(
         "weaker-regularization",
         100,
         `${p.change.key} rose ${from} \u2192 ${to} and moved the model toward underfitting (\u0394bias ${formatChange(ctx.bias.estimate, kind)}); try ${p.change.key} \u2248 ${formatNumber(between)}, between the two.`,
@@ -21807,7 +21807,7 @@ function chooseLevers(ctx) {
       );
     }
     if (p.lever === "weaker-regularization" && overshotTowardVariance) {
-      add(
+      add2(
         "stronger-regularization",
         100,
         `${p.change.key} fell ${from} \u2192 ${to} and moved the model toward overfitting (\u0394variance ${formatChange(ctx.variance.estimate, kind)}); try ${p.change.key} \u2248 ${formatNumber(between)}, between the two.`,
@@ -21816,21 +21816,21 @@ function chooseLevers(ctx) {
     }
     if ((p.lever === "richer-features" || p.lever === "more-features" || p.lever === "bigger-model") && overshotTowardVariance) {
       const back = p.lever === "bigger-model" ? "smaller-model" : "fewer-features";
-      add(
+      add2(
         back,
         90,
         `${p.change.key} rose ${from} \u2192 ${to} and moved the model toward overfitting (\u0394variance ${formatChange(ctx.variance.estimate, kind)}); step back toward ${formatNumber(between)} or keep it and regularize harder.`,
         [`\u0394variance ${formatChange(ctx.variance.estimate, kind)}`]
       );
       if (reg !== null && reg.side === "below") {
-        add(
+        add2(
           "stronger-regularization",
           95,
           `Keep the new ${p.change.key} and regularize harder: the candidate's sweep has its validation minimum at \u03BB \u2248 ${formatNumber(reg.bestX)}${ctx.lambda === void 0 ? "" : ` (it uses ${formatNumber(ctx.lambda)})`}; try ${formatNumber(reg.suggestedX)}.`,
           [`lowest validation ${v(reg.bestValidation)} at \u03BB \u2248 ${formatNumber(reg.bestX)}`]
         );
       } else {
-        add(
+        add2(
           "stronger-regularization",
           85,
           `Keep the new ${p.change.key} but counter its extra variance with stronger regularization.`,
@@ -21901,39 +21901,39 @@ function chooseLevers(ctx) {
         score -= 30;
         reason = `${reason} Note: ${note}; judge its effect before pulling further.`;
       }
-      add(id, score, reason, evidence);
+      add2(id, score, reason, evidence);
     });
   });
   if (ep !== null && ep.stoppedLate && !drafts.has("early-stopping")) {
-    add("early-stopping", 35, stopEarlierReason(ep));
+    add2("early-stopping", 35, stopEarlierReason(ep));
   }
   if (ep !== null && ep.stoppedEarly && !drafts.has("train-longer")) {
-    add("train-longer", 35, trainLongerReason(ep));
+    add2("train-longer", 35, trainLongerReason(ep));
   }
   if (ctx.candidate.diagnosis === "data-mismatch" || ctx.candidate.components.mismatch.present) {
     const d = ctx.candidate.components.mismatch.value ?? 0;
-    add(
+    add2(
       "align-training-data",
       ctx.candidate.diagnosis === "data-mismatch" ? 70 : 30,
       `Validation error exceeds train_dev error by ${v(d)}: the training data does not look like the validation data; collect or synthesise training data that resembles it.`
     );
   }
   if (ctx.candidate.components.overfit.present) {
-    add(
+    add2(
       "bigger-validation-set",
       40,
       `Test error exceeds validation error by ${v(ctx.candidate.components.overfit.value ?? 0)}: choices may be tuned to the validation set; enlarge or refresh it.`
     );
   }
   if (ctx.candidate.biasUnknown) {
-    add(
+    add2(
       "supply-reference",
       20,
       'Bias is unknown without a reference level: add "reference" (human-level error, a prior system, or an estimated Bayes error) to the artifacts or the config.'
     );
   }
   if (ctx.noiseUnknown) {
-    add(
+    add2(
       "add-repeats",
       15,
       "Run-to-run noise is unknown: train with 2 or more seeds (or ship per-example predictions) so changes can be tested."
@@ -22292,10 +22292,10 @@ async function* readRows(path, file, kind, hashes) {
   const lines = createInterface({ input: stream, crlfDelay: Infinity });
   let line = 0;
   try {
-    for await (const text of lines) {
+    for await (const text2 of lines) {
       line++;
       if (line === 1) {
-        const header = text.replace(/^\uFEFF/, "").trim();
+        const header = text2.replace(/^\uFEFF/, "").trim();
         if (header !== HEADER[kind]) {
           throw new InputError([
             {
@@ -22308,25 +22308,25 @@ async function* readRows(path, file, kind, hashes) {
         }
         continue;
       }
-      if (text.trim() === "") continue;
-      const comma = text.indexOf(",");
-      if (comma < 0 || text.indexOf(",", comma + 1) >= 0) {
+      if (text2.trim() === "") continue;
+      const comma = text2.indexOf(",");
+      if (comma < 0 || text2.indexOf(",", comma + 1) >= 0) {
         throw new InputError([
           {
             file,
             pointer: `line ${line}`,
             expected: "must have exactly two fields, id and value",
-            got: quote(text)
+            got: quote(text2)
           }
         ]);
       }
-      const id = text.slice(0, comma).trim();
+      const id = text2.slice(0, comma).trim();
       if (id === "")
         throw new InputError([
           { file, pointer: `line ${line}`, expected: "must have a non-empty id" }
         ]);
       hashes?.push(hashId(id));
-      yield { id, value: parseValue(text.slice(comma + 1), kind, file, line), line };
+      yield { id, value: parseValue(text2.slice(comma + 1), kind, file, line), line };
     }
   } finally {
     lines.close();
@@ -22384,17 +22384,17 @@ async function pairPredictions(baseline, candidate, kind) {
       pair(a.value.value, b.value.value);
     } else {
       if (!a.done) {
-        const partner = waitingCand.get(a.value.id);
-        if (partner !== void 0) {
+        const partner2 = waitingCand.get(a.value.id);
+        if (partner2 !== void 0) {
           waitingCand.delete(a.value.id);
-          pair(a.value.value, partner);
+          pair(a.value.value, partner2);
         } else waitingBase.set(a.value.id, a.value.value);
       }
       if (!b.done) {
-        const partner = waitingBase.get(b.value.id);
-        if (partner !== void 0) {
+        const partner2 = waitingBase.get(b.value.id);
+        if (partner2 !== void 0) {
           waitingBase.delete(b.value.id);
-          pair(partner, b.value.value);
+          pair(partner2, b.value.value);
         } else waitingCand.set(b.value.id, b.value.value);
       }
     }
@@ -22576,12 +22576,14 @@ Usage:
   fitgap review --baseline FILE --candidate FILE [options]
   fitgap validate FILE...
   fitgap demo [NAME]
+  fitgap curves import --from FORMAT PATH... --out FILE
   fitgap --version
 
 Commands:
   review     compare two run artifacts and print the review
   validate   check run artifacts (.json) or config files (.yml) and exit
   demo       review the bundled demo scenario
+  curves     import a training log (CSV, TensorBoard, MLflow, evals_result) as a curve
 
 Run 'fitgap COMMAND --help' for the options of a command.
 
@@ -22769,17 +22771,17 @@ var DEFAULT_MAX_NAME = 80;
 var ZWJ = "\u200D";
 var REMOVED = /[\p{Cc}\p{Cf}\p{Cs}]/gu;
 var BREAKS = /[\t\n\v\f\r\u0085\u2028\u2029]/g;
-function plainText(text, maxChars = DEFAULT_MAX_NAME) {
-  const cleaned = text.replace(BREAKS, " ").replace(REMOVED, "").replace(/\s+/g, " ").trim();
+function plainText(text2, maxChars = DEFAULT_MAX_NAME) {
+  const cleaned = text2.replace(BREAKS, " ").replace(REMOVED, "").replace(/\s+/g, " ").trim();
   return truncate(cleaned, maxChars);
 }
-function truncate(text, maxChars) {
-  const points = Array.from(text);
-  if (points.length <= maxChars) return text;
+function truncate(text2, maxChars) {
+  const points = Array.from(text2);
+  if (points.length <= maxChars) return text2;
   return `${points.slice(0, Math.max(0, maxChars - 1)).join("").trimEnd()}\u2026`;
 }
-function escapeInline(text, maxChars = DEFAULT_MAX_NAME) {
-  const plain = plainText(text, maxChars);
+function escapeInline(text2, maxChars = DEFAULT_MAX_NAME) {
+  const plain = plainText(text2, maxChars);
   let out = "";
   for (const ch of plain) {
     out += escapeChar(ch);
@@ -22803,12 +22805,12 @@ function escapeChar(ch) {
   }
 }
 var MARKDOWN_PUNCTUATION = /* @__PURE__ */ new Set(["\\", "`", "*", "_", "[", "]", "|", "~", "$"]);
-function mermaidLabel(text, maxChars = 60) {
-  const kept = plainText(text, Number.MAX_SAFE_INTEGER).replace(/[^\p{L}\p{N} .,\-+()/=]/gu, " ").replace(/ {2,}/g, " ").trim();
+function mermaidLabel(text2, maxChars = 60) {
+  const kept = plainText(text2, Number.MAX_SAFE_INTEGER).replace(/[^\p{L}\p{N} .,\-+()/=]/gu, " ").replace(/ {2,}/g, " ").trim();
   return truncate(kept, maxChars);
 }
-function terminalText(text, maxChars = DEFAULT_MAX_NAME) {
-  return plainText(text, maxChars);
+function terminalText(text2, maxChars = DEFAULT_MAX_NAME) {
+  return plainText(text2, maxChars);
 }
 function displayValue(value) {
   if (value === void 0) return "(absent)";
@@ -22834,13 +22836,13 @@ function numberFormatFor(review) {
   return { decimals: Math.min(6, Math.max(0, decimals)) };
 }
 function num(value, format) {
-  const text = value.toFixed(format.decimals);
-  return /^-0(\.0+)?$/.test(text) ? text.slice(1) : text;
+  const text2 = value.toFixed(format.decimals);
+  return /^-0(\.0+)?$/.test(text2) ? text2.slice(1) : text2;
 }
 function signed(value, format) {
-  const text = num(Math.abs(value), format);
-  if (/^0(\.0+)?$/.test(text)) return text;
-  return value > 0 ? `+${text}` : `\u2212${text}`;
+  const text2 = num(Math.abs(value), format);
+  if (/^0(\.0+)?$/.test(text2)) return text2;
+  return value > 0 ? `+${text2}` : `\u2212${text2}`;
 }
 function interval(ci, format) {
   if (ci === null) return "n/a";
@@ -22861,8 +22863,8 @@ function short(value) {
   return String(Number(value.toPrecision(4)));
 }
 function chartNumber(value, decimals) {
-  const text = value.toFixed(decimals);
-  return /^-0(\.0+)?$/.test(text) ? text.slice(1) : text;
+  const text2 = value.toFixed(decimals);
+  return /^-0(\.0+)?$/.test(text2) ? text2.slice(1) : text2;
 }
 
 // src/report/words.ts
@@ -23307,7 +23309,7 @@ function curveCharts(review, curve) {
   });
 }
 function lineChart(review, curve, series, [lo, hi], [yMin, yMax], only) {
-  const text = CURVE_TEXT[curve];
+  const text2 = CURVE_TEXT[curve];
   const ordered = orderSeries(series);
   const xs = [
     ...new Set(ordered.flatMap((s) => s.points.map((p) => p[0])).filter((x) => x >= lo && x <= hi))
@@ -23321,13 +23323,13 @@ function lineChart(review, curve, series, [lo, hi], [yMin, yMax], only) {
   const xDecimals = Number.isInteger(lo) && Number.isInteger(hi) ? 0 : Math.min(6, Math.max(0, 2 - Math.floor(Math.log10(Math.max(hi - lo, 1e-9)))));
   const metric = mermaidLabel(review.metric.name, 40) || "metric";
   const unit = review.metric.kind === "proportion" ? "proportion" : "metric units";
-  const title = only === null ? text.title : `${text.title}, ${only}`;
+  const title = only === null ? text2.title : `${text2.title}, ${only}`;
   const palette = ordered.map((s) => PALETTE[paletteKey(s)][0]).join(", ");
   const lines = [
     `%%{init: {"themeVariables": {"xyChart": {"plotColorPalette": "${palette}"}}}}%%`,
     "xychart-beta",
     `  title "${title}"`,
-    geometric ? `  x-axis "${text.x}" [${grid.map((x) => `"${short(x)}"`).join(", ")}]` : `  x-axis "${text.x}" ${chartNumber(lo, xDecimals)} --> ${chartNumber(hi, xDecimals)}`,
+    geometric ? `  x-axis "${text2.x}" [${grid.map((x) => `"${short(x)}"`).join(", ")}]` : `  x-axis "${text2.x}" ${chartNumber(lo, xDecimals)} --> ${chartNumber(hi, xDecimals)}`,
     `  y-axis "${metric} (${unit})" ${chartNumber(y0, yDecimals)} --> ${chartNumber(y1, yDecimals)}`,
     ...ordered.map(
       (s) => `  line [${grid.map((x) => chartNumber(interpolate(s.points, x, geometric), yDecimals + 1)).join(", ")}]`
@@ -23336,10 +23338,10 @@ function lineChart(review, curve, series, [lo, hi], [yMin, yMax], only) {
   const legend = ordered.map((s) => `${PALETTE[paletteKey(s)][1]} = ${s.run} ${s.part}`).join(", ");
   const scale = geometric ? " The x positions are evenly spaced categories (roughly a log scale)." : "";
   const clipped = only === null && series.some((s) => s.points.some((p) => p[0] < lo || p[0] > hi)) ? ` Drawn over the x range both runs cover (${short(lo)} to ${short(hi)}).` : "";
-  const caption = `**${text.caption}${only === null ? "" : ` (${only})`}**, ${escapeInline(
+  const caption = `**${text2.caption}${only === null ? "" : ` (${only})`}**, ${escapeInline(
     review.metric.name,
     40
-  )} by ${text.x}. Lines: ${legend}.${scale}${clipped}`;
+  )} by ${text2.x}. Lines: ${legend}.${scale}${clipped}`;
   return { kind: curve, caption, code: lines.join("\n") };
 }
 function paletteKey(s) {
@@ -23654,10 +23656,10 @@ var ANSI = {
 };
 function renderText(review, options) {
   const width = Math.max(40, Math.floor(options.width ?? 80));
-  const paint = (text, ...codes) => options.color && codes.length > 0 ? `${codes.join("")}${text}${ANSI.reset}` : text;
+  const paint = (text2, ...codes) => options.color && codes.length > 0 ? `${codes.join("")}${text2}${ANSI.reset}` : text2;
   const tone = (t) => t === "good" ? [ANSI.green] : t === "bad" ? [ANSI.red] : [];
-  const heading = (text) => paint(text, ANSI.bold);
-  const esc = (text, max) => terminalText(text, max);
+  const heading = (text2) => paint(text2, ANSI.bold);
+  const esc = (text2, max) => terminalText(text2, max);
   const h = buildHeadline(review, esc);
   const out = [];
   for (const line of wrap(`fitgap review: ${h.title}`, width, "")) {
@@ -23751,11 +23753,11 @@ function withoutColumn(t, header) {
   const drop = (row) => row.filter((_, i) => i !== c);
   return { header: drop(t.header), align: drop(t.align), rows: t.rows.map(drop) };
 }
-function wrap(text, width, indent, first = indent) {
+function wrap(text2, width, indent, first = indent) {
   const lines = [];
   let line = first;
   let empty = true;
-  for (const word of text.split(" ").filter((w) => w !== "")) {
+  for (const word of text2.split(" ").filter((w) => w !== "")) {
     const candidate = empty ? `${line}${word}` : `${line} ${word}`;
     if (Array.from(candidate).length <= width) {
       line = candidate;
@@ -23903,18 +23905,18 @@ async function reviewCommand(argv, io) {
     overrides,
     ...typeof config === "string" ? { config } : {}
   });
-  const text = renderReview(result, format, {
+  const text2 = renderReview(result, format, {
     color: io.color && typeof values["out"] !== "string",
     ...typeof commentKey === "string" ? { commentKey } : {}
   });
   const out = values["out"];
   if (typeof out === "string") {
-    await io.writeFile(resolve3(io.cwd, out), text);
+    await io.writeFile(resolve3(io.cwd, out), text2);
     io.stderr(
       `fitgap: review written to ${out} (gate ${result.review.gate.pass ? "passed" : "failed"}).
 `
     );
-  } else io.stdout(text);
+  } else io.stdout(text2);
   return result.review.gate.pass ? EXIT.ok : EXIT.gateFailed;
 }
 async function validateCommand(argv, io) {
@@ -24000,6 +24002,1565 @@ Demo: Crumb & Co. baseline vs candidate "${name}". See the others with:
   return EXIT.ok;
 }
 
+// src/entries/cli/curves-import.ts
+import { resolve as resolve4 } from "node:path";
+
+// src/artifact/curve-logs/limits.ts
+var MAX_POINTS2 = 1e6;
+var MAX_SERIES = 1e4;
+var MAX_TEXT_BYTES = 64 * 1024 * 1024;
+var MAX_EVENT_FILE_BYTES = 512 * 1024 * 1024;
+
+// src/artifact/curve-logs/text.ts
+var decoder = new TextDecoder("utf-8", { fatal: true });
+function decodeText(input, file, what) {
+  if (typeof input !== "string" && input.length > MAX_TEXT_BYTES) {
+    throw new InputError([
+      {
+        file,
+        pointer: "",
+        expected: `must be at most ${MAX_TEXT_BYTES / 1024 / 1024} MiB for ${what}`,
+        got: `${input.length} bytes`,
+        hint: "Import a shorter log, or thin it out before importing."
+      }
+    ]);
+  }
+  let text2;
+  try {
+    text2 = typeof input === "string" ? input : decoder.decode(input);
+  } catch {
+    throw new InputError([
+      {
+        file,
+        pointer: "",
+        expected: `must be UTF-8 text (${what})`,
+        hint: "Check that the file is the log itself and not a binary or compressed file."
+      }
+    ]);
+  }
+  return text2.charCodeAt(0) === 65279 ? text2.slice(1) : text2;
+}
+var DECIMAL = /^[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?$/;
+function parseDecimal(text2) {
+  const t = text2.trim();
+  if (DECIMAL.test(t)) return Number(t);
+  if (/^[+-]?(?:nan|inf|infinity)$/i.test(t)) return /nan/i.test(t) ? Number.NaN : Infinity;
+  return void 0;
+}
+function notFinite(file, pointer, what, got) {
+  const nonFinite = parseDecimal(got) !== void 0;
+  return {
+    file,
+    pointer,
+    expected: `${what} must be a finite number`,
+    got: quote(got),
+    ...nonFinite ? {
+      hint: "The run logged NaN or infinity here (it may have diverged); cut the log before this point or pick another series."
+    } : {}
+  };
+}
+var PointBudget = class {
+  constructor(limit = MAX_POINTS2) {
+    this.limit = limit;
+  }
+  limit;
+  used = 0;
+  take(file, pointer) {
+    this.used++;
+    if (this.used > this.limit) {
+      throw new InputError([
+        {
+          file,
+          pointer,
+          expected: `holds more than ${this.limit.toLocaleString("en-US")} points, the most one import reads`,
+          hint: "Import fewer files, or log less often (per epoch rather than per step)."
+        }
+      ]);
+    }
+  }
+};
+
+// src/artifact/curve-logs/csv-log.ts
+function splitCsvLine2(line) {
+  if (!line.includes('"')) return line.split(",").map((cell2) => cell2.trim());
+  const cells = [];
+  let cell = "";
+  let quoted = false;
+  for (let i = 0; i < line.length; i++) {
+    const c = line[i];
+    if (quoted) {
+      if (c === '"') {
+        if (line[i + 1] === '"') {
+          cell += '"';
+          i++;
+        } else quoted = false;
+      } else cell += c;
+    } else if (c === '"' && cell.trim() === "") {
+      cell = "";
+      quoted = true;
+    } else if (c === ",") {
+      cells.push(cell.trim());
+      cell = "";
+    } else cell += c;
+  }
+  if (quoted) return null;
+  cells.push(cell.trim());
+  return cells;
+}
+function structural(file, line, expected, got, hint) {
+  const issue = { file, pointer: `line ${line}`, expected };
+  if (got !== void 0) issue.got = got;
+  if (hint !== void 0) issue.hint = hint;
+  return new InputError([issue]);
+}
+function readCsvLog(input, file, options = {}) {
+  const text2 = decodeText(input, file, "a CSV log");
+  const budget = options.budget ?? new PointBudget();
+  const lines = text2.split(/\r?\n/);
+  const header = splitCsvLine2(lines[0] ?? "");
+  if (header === null || header.every((h) => h === "")) {
+    throw structural(
+      file,
+      1,
+      'must be a header row naming the columns, such as "epoch,loss,val_loss"',
+      quote(lines[0] ?? "")
+    );
+  }
+  if (header.length > MAX_SERIES + 1)
+    throw structural(file, 1, `must have at most ${MAX_SERIES} columns`, `${header.length}`);
+  const seen = /* @__PURE__ */ new Set();
+  for (const name of header) {
+    if (name === "" || seen.has(name))
+      throw structural(
+        file,
+        1,
+        "must name every column once",
+        quote(name),
+        "Give each column a distinct, non-empty name."
+      );
+    seen.add(name);
+  }
+  const xName = options.x ?? (seen.has("epoch") ? "epoch" : seen.has("step") ? "step" : void 0);
+  const xi = xName === void 0 ? -1 : header.indexOf(xName);
+  if (xName === void 0 || xi < 0) {
+    throw structural(
+      file,
+      1,
+      xName === void 0 ? 'must have an "epoch" or "step" column for x' : `must have the column "${xName}"`,
+      quote(header.join(",")),
+      xName === void 0 ? "Name the x column (--x, or x in the config)." : "Name one of the header columns."
+    );
+  }
+  const where = { kind: "line" };
+  const series = header.map((name) => ({
+    name,
+    file,
+    x: xName,
+    where,
+    points: [],
+    problems: []
+  }));
+  const xIssues = [];
+  for (let i = 1; i < lines.length && xIssues.length < 10; i++) {
+    const raw = lines[i] ?? "";
+    if (raw.trim() === "") continue;
+    const line = i + 1;
+    const cells = splitCsvLine2(raw);
+    if (cells === null) throw structural(file, line, "must close every quoted cell", quote(raw));
+    if (cells.length > header.length)
+      throw structural(
+        file,
+        line,
+        `must have at most ${header.length} cells, one per header column`,
+        `${cells.length}`,
+        "Quote cells that contain commas, or fix the header."
+      );
+    const xCell = cells[xi] ?? "";
+    const x = xCell === "" ? Number.NaN : parseDecimal(xCell);
+    if (x === void 0 || !Number.isFinite(x)) {
+      xIssues.push(notFinite(file, `line ${line}`, `column "${xName}"`, xCell));
+      continue;
+    }
+    for (let c = 0; c < header.length; c++) {
+      const cell = cells[c] ?? "";
+      const s = series[c];
+      if (c === xi || cell === "" || s === void 0) continue;
+      const value = parseDecimal(cell);
+      if (value === void 0 || !Number.isFinite(value)) {
+        if (s.problems.length < 10)
+          s.problems.push(notFinite(file, `line ${line}`, `column "${s.name}"`, cell));
+        continue;
+      }
+      budget.take(file, `line ${line}`);
+      s.points.push({ x, value, at: line });
+    }
+  }
+  if (xIssues.length > 0) throw new InputError(xIssues);
+  return { series: series.filter((_, c) => c !== xi), warnings: [] };
+}
+
+// src/artifact/curve-logs/protobuf.ts
+var MalformedProto = class extends Error {
+  constructor(message) {
+    super(message);
+    this.name = "MalformedProto";
+  }
+};
+var WIRE = { varint: 0, fixed64: 1, bytes: 2, fixed32: 5 };
+var SCRATCH = new Uint8Array(8);
+var SCRATCH_VIEW = new DataView(SCRATCH.buffer);
+var ProtoReader = class {
+  constructor(buf, start = 0, end = buf.length) {
+    this.buf = buf;
+    this.pos = start;
+    this.end = end;
+  }
+  buf;
+  pos;
+  end;
+  done() {
+    return this.pos >= this.end;
+  }
+  /** Field number and wire type of the next field. */
+  tag() {
+    const key = this.varint();
+    const field = Math.floor(key / 8);
+    if (field < 1) throw new MalformedProto(`field number 0 at byte ${this.pos}`);
+    return { field, wire: key % 8 };
+  }
+  /** An unsigned varint as a number (exact up to 2^53). */
+  varint() {
+    let result = 0;
+    let scale = 1;
+    for (let i = 0; i < 10; i++) {
+      if (this.pos >= this.end) throw new MalformedProto("varint runs past the end");
+      const b = this.buf[this.pos++];
+      result += (b & 127) * scale;
+      if ((b & 128) === 0) return result;
+      scale *= 128;
+    }
+    throw new MalformedProto("varint longer than 10 bytes");
+  }
+  /** A varint read as a two's-complement int64 (negative steps take 10 bytes). */
+  int64() {
+    const start = this.pos;
+    const unsigned = this.varint();
+    if (unsigned < 2 ** 53) return unsigned;
+    let value = 0n;
+    let shift = 0n;
+    for (let p = start; p < this.pos; p++) {
+      value |= BigInt(this.buf[p] & 127) << shift;
+      shift += 7n;
+    }
+    return Number(BigInt.asIntN(64, value));
+  }
+  /** Copies a fixed-width field into the scratch buffer (little-endian, as the wire is). */
+  fixed(size) {
+    if (this.end - this.pos < size) throw new MalformedProto("fixed field runs past the end");
+    for (let i = 0; i < size; i++) SCRATCH[i] = this.buf[this.pos + i];
+    this.pos += size;
+  }
+  float() {
+    this.fixed(4);
+    return SCRATCH_VIEW.getFloat32(0, true);
+  }
+  double() {
+    this.fixed(8);
+    return SCRATCH_VIEW.getFloat64(0, true);
+  }
+  /** A length-delimited field's bytes (a view, not a copy). */
+  bytes() {
+    const length = this.varint();
+    if (length > this.end - this.pos) throw new MalformedProto("length runs past the end");
+    const out = this.buf.subarray(this.pos, this.pos + length);
+    this.pos += length;
+    return out;
+  }
+  skip(wire) {
+    if (wire === WIRE.varint) this.varint();
+    else if (wire === WIRE.fixed64) this.fixed(8);
+    else if (wire === WIRE.bytes) this.bytes();
+    else if (wire === WIRE.fixed32) this.fixed(4);
+    else throw new MalformedProto(`unsupported wire type ${wire}`);
+  }
+};
+function readRepeated(reader, wire, scalarWire, one, out) {
+  if (wire === scalarWire) {
+    out.push(one(reader));
+    return;
+  }
+  if (wire !== WIRE.bytes) throw new MalformedProto(`unexpected wire type ${wire}`);
+  const run = reader.bytes();
+  const inner = new ProtoReader(run);
+  while (!inner.done()) out.push(one(inner));
+}
+var decoder2 = new TextDecoder("utf-8", { fatal: true });
+function utf8(bytes) {
+  try {
+    return decoder2.decode(bytes);
+  } catch {
+    throw new MalformedProto("string field is not UTF-8");
+  }
+}
+
+// src/artifact/curve-logs/crc32c.ts
+var TABLE2 = (() => {
+  const table2 = new Uint32Array(256);
+  for (let n = 0; n < 256; n++) {
+    let c = n;
+    for (let k = 0; k < 8; k++) c = c & 1 ? c >>> 1 ^ 2197175160 : c >>> 1;
+    table2[n] = c >>> 0;
+  }
+  return table2;
+})();
+function crc32c(bytes, start = 0, end = bytes.length) {
+  let crc = 4294967295;
+  for (let i = start; i < end; i++) {
+    crc = TABLE2[(crc ^ bytes[i]) & 255] ^ crc >>> 8;
+  }
+  return (crc ^ 4294967295) >>> 0;
+}
+function maskCrc(crc) {
+  return (crc >>> 15 | crc << 17) + 2726488792 >>> 0;
+}
+
+// src/artifact/curve-logs/tfrecord.ts
+function readUint32(bytes, at) {
+  return (bytes[at] | bytes[at + 1] << 8 | bytes[at + 2] << 16 | bytes[at + 3] << 24) >>> 0;
+}
+function readTfRecords(bytes, file) {
+  const records = [];
+  let offset = 0;
+  let number2 = 0;
+  while (offset < bytes.length) {
+    number2++;
+    const where = `record ${number2} (byte ${offset})`;
+    if (bytes.length - offset < 12) return { records, truncatedAt: offset };
+    if (maskCrc(crc32c(bytes, offset, offset + 8)) !== readUint32(bytes, offset + 8)) {
+      throw new InputError([
+        {
+          file,
+          pointer: where,
+          expected: "must start with a record length whose checksum matches",
+          hint: "The file is damaged or is not a TensorBoard event file (events.out.tfevents.*)."
+        }
+      ]);
+    }
+    const high = readUint32(bytes, offset + 4);
+    const length = readUint32(bytes, offset);
+    const start = offset + 12;
+    if (high === 0 && length > bytes.length - start - 4) return { records, truncatedAt: offset };
+    if (high !== 0) {
+      throw new InputError([
+        {
+          file,
+          pointer: where,
+          expected: "must have a record length under 4 GiB",
+          got: `${high * 2 ** 32 + length} bytes`
+        }
+      ]);
+    }
+    const end = start + length;
+    if (maskCrc(crc32c(bytes, start, end)) !== readUint32(bytes, end)) {
+      throw new InputError([
+        {
+          file,
+          pointer: where,
+          expected: "must hold data whose checksum matches",
+          hint: "The file is damaged; TensorBoard would stop reading it here too."
+        }
+      ]);
+    }
+    records.push({ data: bytes.subarray(start, end), number: number2, offset });
+    offset = end + 4;
+  }
+  return { records };
+}
+
+// src/artifact/curve-logs/tensorboard.ts
+var DT = { float: 1, double: 2, int32: 3, int64: 9, half: 19 };
+function shortestFloat32(value) {
+  if (!Number.isFinite(value) || value === 0) return value;
+  for (let digits = 1; digits <= 9; digits++) {
+    const candidate = Number(value.toPrecision(digits));
+    if (Math.fround(candidate) === value) return candidate;
+  }
+  return value;
+}
+function halfToNumber(bits) {
+  const sign = bits & 32768 ? -1 : 1;
+  const exponent = bits >> 10 & 31;
+  const fraction = bits & 1023;
+  if (exponent === 0) return sign * 2 ** -14 * (fraction / 1024);
+  if (exponent === 31) return fraction === 0 ? sign * Infinity : Number.NaN;
+  return sign * 2 ** (exponent - 15) * (1 + fraction / 1024);
+}
+function shapeSize(bytes) {
+  const reader = new ProtoReader(bytes);
+  let size = 1;
+  while (!reader.done()) {
+    const { field, wire } = reader.tag();
+    if (field === 2 && wire === WIRE.bytes) {
+      const dim = new ProtoReader(reader.bytes());
+      let n = 0;
+      while (!dim.done()) {
+        const t = dim.tag();
+        if (t.field === 1 && t.wire === WIRE.varint) n = dim.int64();
+        else dim.skip(t.wire);
+      }
+      size *= n;
+    } else reader.skip(wire);
+  }
+  return size;
+}
+function fromContent(content, dtype) {
+  const width = { [DT.float]: 4, [DT.double]: 8, [DT.int32]: 4, [DT.int64]: 8, [DT.half]: 2 }[dtype];
+  if (width === void 0 || content.length !== width) return void 0;
+  const view = new DataView(content.buffer, content.byteOffset, width);
+  if (dtype === DT.float) return shortestFloat32(view.getFloat32(0, true));
+  if (dtype === DT.double) return view.getFloat64(0, true);
+  if (dtype === DT.int32) return view.getInt32(0, true);
+  if (dtype === DT.int64) return Number(view.getBigInt64(0, true));
+  return halfToNumber(view.getUint16(0, true));
+}
+function scalarOfTensor(bytes) {
+  const reader = new ProtoReader(bytes);
+  let dtype = 0;
+  let size = 1;
+  let content;
+  const values = [];
+  while (!reader.done()) {
+    const { field, wire } = reader.tag();
+    if (field === 1 && wire === WIRE.varint) dtype = reader.varint();
+    else if (field === 2 && wire === WIRE.bytes) size = shapeSize(reader.bytes());
+    else if (field === 4 && wire === WIRE.bytes) content = reader.bytes();
+    else if (field === 5)
+      readRepeated(reader, wire, WIRE.fixed32, (r) => shortestFloat32(r.float()), values);
+    else if (field === 6) readRepeated(reader, wire, WIRE.fixed64, (r) => r.double(), values);
+    else if (field === 7 || field === 10)
+      readRepeated(reader, wire, WIRE.varint, (r) => r.int64(), values);
+    else if (field === 13)
+      readRepeated(reader, wire, WIRE.varint, (r) => halfToNumber(r.varint() & 65535), values);
+    else reader.skip(wire);
+  }
+  if (size !== 1 || !Object.values(DT).includes(dtype)) return void 0;
+  if (content !== void 0 && content.length > 0) return fromContent(content, dtype);
+  return values.length === 1 ? values[0] : void 0;
+}
+function pluginName(bytes) {
+  const reader = new ProtoReader(bytes);
+  let name;
+  while (!reader.done()) {
+    const { field, wire } = reader.tag();
+    if (field === 1 && wire === WIRE.bytes) {
+      const data = new ProtoReader(reader.bytes());
+      while (!data.done()) {
+        const t = data.tag();
+        if (t.field === 1 && t.wire === WIRE.bytes) name = utf8(data.bytes());
+        else data.skip(t.wire);
+      }
+    } else reader.skip(wire);
+  }
+  return name;
+}
+function readValue(bytes) {
+  const reader = new ProtoReader(bytes);
+  const out = { tag: "", value: void 0 };
+  while (!reader.done()) {
+    const { field, wire } = reader.tag();
+    if (field === 1 && wire === WIRE.bytes) out.tag = utf8(reader.bytes());
+    else if (field === 2 && wire === WIRE.fixed32) out.value = shortestFloat32(reader.float());
+    else if (field === 8 && wire === WIRE.bytes) out.value = scalarOfTensor(reader.bytes());
+    else if (field === 9 && wire === WIRE.bytes) {
+      const plugin = pluginName(reader.bytes());
+      if (plugin !== void 0) out.plugin = plugin;
+    } else reader.skip(wire);
+  }
+  return out;
+}
+function readEvent(bytes) {
+  const reader = new ProtoReader(bytes);
+  let step = 0;
+  const summaries = [];
+  while (!reader.done()) {
+    const { field, wire } = reader.tag();
+    if (field === 2 && wire === WIRE.varint) step = reader.int64();
+    else if (field === 5 && wire === WIRE.bytes) summaries.push(reader.bytes());
+    else reader.skip(wire);
+  }
+  const values = [];
+  for (const summary of summaries) {
+    const s = new ProtoReader(summary);
+    while (!s.done()) {
+      const { field, wire } = s.tag();
+      if (field === 1 && wire === WIRE.bytes) values.push(readValue(s.bytes()));
+      else s.skip(wire);
+    }
+  }
+  return { step, values };
+}
+function readTensorBoard(bytes, file, options = {}) {
+  if (bytes.length > MAX_EVENT_FILE_BYTES) {
+    throw new InputError([
+      {
+        file,
+        pointer: "",
+        expected: `must be at most ${MAX_EVENT_FILE_BYTES / 1024 / 1024} MiB`,
+        got: `${bytes.length} bytes`,
+        hint: "Import the event file of the scalars only, or split the run."
+      }
+    ]);
+  }
+  const budget = options.budget ?? new PointBudget();
+  const { records, truncatedAt } = readTfRecords(bytes, file);
+  const byTag = /* @__PURE__ */ new Map();
+  const otherPlugin = /* @__PURE__ */ new Set();
+  let skipped2 = 0;
+  const where = { kind: "record" };
+  for (const record of records) {
+    let event;
+    try {
+      event = readEvent(record.data);
+    } catch (error) {
+      if (!(error instanceof MalformedProto)) throw error;
+      throw new InputError([
+        {
+          file,
+          pointer: `record ${record.number} (byte ${record.offset})`,
+          expected: "must hold a TensorBoard Event message",
+          got: error.message,
+          hint: "Name an events.out.tfevents.* file written by TensorBoard, PyTorch or Keras."
+        }
+      ]);
+    }
+    for (const v of event.values) {
+      if (v.plugin !== void 0 && v.plugin !== "scalars") otherPlugin.add(v.tag);
+      if (v.tag === "" || otherPlugin.has(v.tag)) continue;
+      if (v.value === void 0) {
+        skipped2++;
+        continue;
+      }
+      let series = byTag.get(v.tag);
+      if (series === void 0) {
+        if (byTag.size >= MAX_SERIES)
+          throw new InputError([
+            {
+              file,
+              pointer: `record ${record.number}`,
+              expected: `must hold at most ${MAX_SERIES} scalar tags`
+            }
+          ]);
+        series = { name: v.tag, file, x: "step", where, points: [], problems: [] };
+        byTag.set(v.tag, series);
+      }
+      if (!Number.isFinite(v.value)) {
+        if (series.problems.length < 10)
+          series.problems.push({
+            file,
+            pointer: `record ${record.number}`,
+            expected: `tag "${v.tag}" must be a finite number`,
+            got: String(v.value),
+            hint: "The run logged NaN or infinity here (it may have diverged); pick another series or cut the run."
+          });
+        continue;
+      }
+      budget.take(file, `record ${record.number}`);
+      series.points.push({ x: event.step, value: v.value, at: record.number });
+    }
+  }
+  const warnings = [];
+  if (skipped2 > 0) warnings.push({ code: "non-scalar-skipped", file, count: skipped2 });
+  if (truncatedAt !== void 0)
+    warnings.push({ code: "truncated-record", file, offset: truncatedAt });
+  return { series: [...byTag.values()], warnings };
+}
+
+// src/artifact/curve-logs/mlflow.ts
+var INTEGER = /^[+-]?\d+$/;
+function readMlflowMetric(input, file, key, options = {}) {
+  const text2 = decodeText(input, file, "an MLflow metric file");
+  const budget = options.budget ?? new PointBudget();
+  const series = {
+    name: key,
+    file,
+    x: "step",
+    where: { kind: "line" },
+    points: [],
+    problems: []
+  };
+  const lines = text2.split(/\r?\n/);
+  for (let i = 0; i < lines.length; i++) {
+    const raw = lines[i] ?? "";
+    if (raw.trim() === "") continue;
+    const line = i + 1;
+    const fields = raw.trim().split(/\s+/);
+    const [timestamp, valueText, stepText = "0"] = fields;
+    if (fields.length < 2 || fields.length > 3 || !INTEGER.test(timestamp ?? "") || !INTEGER.test(stepText)) {
+      throw new InputError([
+        {
+          file,
+          pointer: `line ${line}`,
+          expected: 'must be "timestamp value step" (whole-number timestamp and step)',
+          got: quote(raw),
+          hint: "Name a metric file under mlruns/<experiment>/<run>/metrics/."
+        }
+      ]);
+    }
+    const value = parseDecimal(valueText ?? "");
+    if (value === void 0 || !Number.isFinite(value)) {
+      if (series.problems.length < 10)
+        series.problems.push(notFinite(file, `line ${line}`, `metric "${key}"`, valueText ?? ""));
+      continue;
+    }
+    budget.take(file, `line ${line}`);
+    series.points.push({ x: Number(stepText), value, at: line });
+  }
+  return { series: [series], warnings: [] };
+}
+
+// src/artifact/curve-logs/evals-result.ts
+function isObject(value) {
+  return typeof value === "object" && value !== null && !Array.isArray(value);
+}
+function escapePointer(segment) {
+  return segment.replace(/~/g, "~0").replace(/\//g, "~1");
+}
+function readEvalsResult(input, file, options = {}) {
+  const text2 = decodeText(input, file, "an evals_result JSON file");
+  const budget = options.budget ?? new PointBudget();
+  let doc;
+  try {
+    doc = parseJson(text2, file);
+  } catch (error) {
+    const nan = /[:[,]\s*-?(?:NaN|Infinity)\b/.exec(text2);
+    if (!(error instanceof InputError) || nan === null) throw error;
+    const issue = error.issues[0];
+    throw new InputError([
+      {
+        file,
+        pointer: issue?.pointer ?? "",
+        expected: "must be JSON without NaN or Infinity",
+        got: quote(nan[0].replace(/^[:[,]\s*/, "")),
+        hint: "A round logged a non-finite value; cut the rounds after it, or dump with allow_nan=False to find it."
+      }
+    ]);
+  }
+  const shape = (pointer, expected, got) => new InputError([
+    {
+      file,
+      pointer,
+      expected,
+      got: quote(got),
+      hint: `Write the booster's evals_result as JSON: {"train": {"logloss": [...]}, "eval": {...}}.`
+    }
+  ]);
+  if (!isObject(doc) || Object.keys(doc).length === 0)
+    throw shape("", "must be an object of eval sets, each an object of metric arrays", doc);
+  const series = [];
+  const names = /* @__PURE__ */ new Set();
+  for (const [set, metrics] of Object.entries(doc)) {
+    const setPointer = `/${escapePointer(set)}`;
+    if (!isObject(metrics))
+      throw shape(
+        setPointer,
+        'must be an object of metric arrays, such as {"logloss": [...]}',
+        metrics
+      );
+    for (const [metric, values] of Object.entries(metrics)) {
+      const path = `${setPointer}/${escapePointer(metric)}`;
+      if (!Array.isArray(values))
+        throw shape(path, "must be an array with one value per boosting round", values);
+      if (series.length >= MAX_SERIES)
+        throw shape(path, `must hold at most ${MAX_SERIES} eval-set metrics`, metric);
+      const name = `${set}/${metric}`;
+      if (names.has(name))
+        throw shape(path, `must give a series name of its own, but "${name}" is taken`, metric);
+      names.add(name);
+      const s = {
+        name,
+        file,
+        x: "round",
+        where: { kind: "json", path },
+        points: [],
+        problems: []
+      };
+      values.forEach((value, i) => {
+        if (typeof value !== "number" || !Number.isFinite(value)) {
+          if (s.problems.length < 10)
+            s.problems.push({
+              file,
+              pointer: `${path}/${i}`,
+              expected: "must be a finite number",
+              got: quote(value)
+            });
+          return;
+        }
+        budget.take(file, `${path}/${i}`);
+        s.points.push({ x: i + 1, value, at: i });
+      });
+      series.push(s);
+    }
+  }
+  return { series, warnings: [] };
+}
+
+// src/artifact/curve-logs/x-axis.ts
+function isEpochSeries(s) {
+  const leaf = s.name.slice(s.name.lastIndexOf("/") + 1).toLowerCase();
+  return leaf === "epoch";
+}
+function stepsToEpochs(read, file) {
+  const epochSeries = read.series.filter(isEpochSeries);
+  if (epochSeries.length === 0) {
+    throw new InputError([
+      {
+        file,
+        pointer: "",
+        expected: 'must log an "epoch" series to use epochs as x',
+        hint: "Leave out --x epoch to use the logged steps as x."
+      }
+    ]);
+  }
+  const byFolder = /* @__PURE__ */ new Map();
+  for (const s of epochSeries) {
+    const folder = s.name.slice(0, s.name.lastIndexOf("/") + 1);
+    const list = byFolder.get(folder) ?? [];
+    for (const p of s.points) list.push({ step: p.x, epoch: p.value });
+    byFolder.set(folder, list);
+  }
+  for (const list of byFolder.values()) list.sort((a, b) => a.step - b.step);
+  const fallback = byFolder.get("") ?? (byFolder.size === 1 ? [...byFolder.values()][0] : void 0);
+  const epochAt = (list, step) => {
+    let lo = 0;
+    let hi = list.length - 1;
+    let found;
+    while (lo <= hi) {
+      const mid = lo + hi >> 1;
+      const entry = list[mid];
+      if (entry.step <= step) {
+        found = entry.epoch;
+        lo = mid + 1;
+      } else hi = mid - 1;
+    }
+    return found;
+  };
+  const series = [];
+  for (const s of read.series) {
+    if (isEpochSeries(s)) continue;
+    const folder = s.name.slice(0, s.name.lastIndexOf("/") + 1);
+    const list = byFolder.get(folder) ?? fallback;
+    if (list === void 0) continue;
+    const points = [];
+    for (const p of s.points) {
+      const epoch = epochAt(list, p.x);
+      if (epoch !== void 0) points.push({ ...p, x: epoch });
+    }
+    series.push({ ...s, x: "epoch", points });
+  }
+  return { series, warnings: read.warnings };
+}
+
+// src/artifact/curve-logs/names.ts
+var TRAIN_WORDS = /* @__PURE__ */ new Set(["train", "training", "learn", "trn"]);
+var VALIDATION_RANK = /* @__PURE__ */ new Map([
+  ["val", 0],
+  ["valid", 0],
+  ["validation", 0],
+  ["eval", 0],
+  ["evaluation", 0],
+  ["dev", 0],
+  ["test", 3]
+]);
+var NUMBERED = /^(?:val|valid|validation|eval)_(\d+)$/;
+var NOT_A_METRIC = /^(?:epochs?|steps?|global_step|iter(?:ation)?s?|batch(?:es)?|lr|learning_rate|lr[-_].*|time.*|duration|hp_metric|momentum|weight_decay|grad_norm)$/;
+function roleOfWord(word) {
+  const w = word.toLowerCase();
+  if (TRAIN_WORDS.has(w)) return { role: "train", rank: 0 };
+  const rank = VALIDATION_RANK.get(w);
+  if (rank !== void 0) return { role: "validation", rank };
+  const numbered = NUMBERED.exec(w);
+  if (numbered?.[1] !== void 0)
+    return { role: "validation", rank: 1 + Number(numbered[1]) / 1e6 };
+  return void 0;
+}
+function normalizeBase(text2) {
+  let base = text2.toLowerCase();
+  let stage = 0;
+  const last = base.lastIndexOf("/") + 1;
+  let leaf = base.slice(last);
+  if (leaf.startsWith("epoch_") && leaf.length > 6) leaf = leaf.slice(6);
+  const suffix = /^(.+)_(epoch|step)$/.exec(leaf);
+  if (suffix?.[1] !== void 0) {
+    leaf = suffix[1];
+    stage = suffix[2] === "epoch" ? 0.1 : 0.2;
+  }
+  base = base.slice(0, last) + leaf;
+  return { base, stage };
+}
+function parseName(name) {
+  const segments = name.split("/");
+  for (let i = segments.length - 1; i >= 0; i--) {
+    const found = roleOfWord(segments[i] ?? "");
+    if (found === void 0) continue;
+    const after = segments.slice(i + 1).join("/");
+    const before = segments.slice(0, i).join("/");
+    const { base: base2, stage: stage2 } = normalizeBase(after !== "" ? after : before);
+    if (base2 === "" || NOT_A_METRIC.test(base2.slice(base2.lastIndexOf("/") + 1))) return void 0;
+    return {
+      name,
+      role: found.role,
+      base: base2,
+      qualifier: after !== "" ? before.toLowerCase() : "",
+      rank: found.rank + stage2,
+      set: (segments[i] ?? "").toLowerCase()
+    };
+  }
+  const leaf = segments[segments.length - 1] ?? "";
+  const qualifier = segments.slice(0, -1).join("/").toLowerCase();
+  let role = "train";
+  let rank = 0.5;
+  let rest = leaf;
+  const prefix = /^([A-Za-z]+(?:_\d+)?)_(.+)$/.exec(leaf);
+  const suffix = /^(.+)_([A-Za-z]+)$/.exec(leaf);
+  const byPrefix = prefix?.[1] === void 0 ? void 0 : roleOfWord(prefix[1]);
+  const bySuffix = suffix?.[2] === void 0 ? void 0 : roleOfWord(suffix[2]);
+  if (byPrefix !== void 0 && prefix?.[2] !== void 0) {
+    ({ role, rank } = byPrefix);
+    rest = prefix[2];
+  } else if (bySuffix !== void 0 && suffix?.[1] !== void 0) {
+    ({ role, rank } = bySuffix);
+    rest = suffix[1];
+  }
+  const { base, stage } = normalizeBase(rest);
+  if (base === "" || NOT_A_METRIC.test(base)) return void 0;
+  return { name, role, base, qualifier, rank: rank + stage };
+}
+
+// src/artifact/curve-logs/units.ts
+var FAMILY = /* @__PURE__ */ new Map();
+var add = (family, names) => names.forEach((n) => FAMILY.set(n, family));
+add("accuracy", [
+  "accuracy",
+  "acc",
+  "binary_accuracy",
+  "categorical_accuracy",
+  "sparse_categorical_accuracy",
+  "top1_accuracy"
+]);
+add("error", [
+  "error",
+  "err",
+  "error_rate",
+  "binary_error",
+  "multi_error",
+  "merror",
+  "misclassification_rate",
+  "zero_one_loss"
+]);
+add("loss", ["loss", "total_loss", "objective"]);
+add("logloss", [
+  "logloss",
+  "log_loss",
+  "binary_logloss",
+  "multi_logloss",
+  "mlogloss",
+  "cross_entropy",
+  "crossentropy",
+  "binary_crossentropy",
+  "categorical_crossentropy",
+  "sparse_categorical_crossentropy",
+  "nll",
+  "multiclass"
+]);
+add("rmse", ["rmse", "root_mean_squared_error"]);
+add("mse", ["mse", "l2", "mean_squared_error"]);
+add("mae", ["mae", "l1", "mean_absolute_error"]);
+add("auc", ["auc", "roc_auc", "auroc"]);
+add("r2", ["r2", "r2_score", "r_squared"]);
+function normalizeMetricName(name) {
+  return name.toLowerCase().replace(/[^a-z0-9]+/g, "_").replace(/^_+|_+$/g, "");
+}
+function familyOf(name) {
+  const leaf = name.slice(name.lastIndexOf("/") + 1);
+  return FAMILY.get(normalizeMetricName(leaf));
+}
+function isLoss(family) {
+  return family === "loss" || family === "logloss";
+}
+var CONVERSIONS = /* @__PURE__ */ new Map([
+  ["accuracy>error", "one-minus"],
+  ["error>accuracy", "one-minus"],
+  ["mse>rmse", "sqrt"],
+  ["rmse>mse", "square"]
+]);
+function convert(conversion, value) {
+  if (conversion === "one-minus") return 1 - value;
+  if (conversion === "sqrt") return Math.sqrt(value);
+  return value * value;
+}
+function matchScore(base, metric) {
+  const b = normalizeMetricName(base.slice(base.lastIndexOf("/") + 1));
+  const m = normalizeMetricName(metric);
+  if (b === m) return 0;
+  const bf = familyOf(b);
+  const mf = familyOf(m);
+  if (bf === void 0 || mf === void 0) return void 0;
+  if (bf === mf) return 1;
+  return CONVERSIONS.has(`${bf}>${mf}`) ? 2 : void 0;
+}
+function unitsFor(base, series, metric) {
+  const bf = familyOf(base);
+  if (metric === void 0) {
+    return {
+      warning: isLoss(bf) ? { code: "loss-not-metric", series } : { code: "units-unchecked", series }
+    };
+  }
+  const score = matchScore(base, metric);
+  if (score === 0 || score === 1) return {};
+  const mf = familyOf(metric);
+  const conversion = bf !== void 0 && mf !== void 0 ? CONVERSIONS.get(`${bf}>${mf}`) : void 0;
+  if (conversion !== void 0)
+    return { conversion, warning: { code: "converted", series, metric, conversion } };
+  if (isLoss(bf)) return { warning: { code: "loss-not-metric", series, metric } };
+  return { warning: { code: "units-unchecked", series, metric } };
+}
+
+// src/artifact/curve-logs/picker.ts
+var byRank = (a, b) => a.rank - b.rank;
+function groups(series) {
+  const map = /* @__PURE__ */ new Map();
+  series.forEach((s, index) => {
+    const parts = parseName(s.name);
+    if (parts === void 0) return;
+    const key = `${parts.qualifier}\0${parts.base}`;
+    let group = map.get(key);
+    if (group === void 0) {
+      group = {
+        base: parts.base,
+        qualifier: parts.qualifier,
+        train: [],
+        validation: [],
+        last: index
+      };
+      map.set(key, group);
+    }
+    group[parts.role].push(parts);
+    group.last = index;
+  });
+  for (const g of map.values()) {
+    g.train.sort(byRank);
+    g.validation.sort(byRank);
+  }
+  return [...map.values()];
+}
+function guessPositional(g) {
+  const positional = g.validation.filter((p) => /^validation_\d+$/.test(p.set ?? ""));
+  if (g.train.length > 0 || positional.length < 2 || positional.length !== g.validation.length)
+    return void 0;
+  const [train, validation] = positional;
+  return train === void 0 || validation === void 0 ? void 0 : { train, validation };
+}
+function notFound(catalogue, name, series, flag) {
+  const names = series.map((s) => s.name);
+  const close = names.find((n) => n.toLowerCase() === name.toLowerCase());
+  const listed = names.slice(0, 12).map((n) => JSON.stringify(n)).join(", ");
+  return new InputError([
+    {
+      file: catalogue.file,
+      pointer: catalogue.pointer,
+      expected: `must have the ${catalogue.noun} "${name}" (${flag})`,
+      got: names.length === 0 ? "none" : `${listed}${names.length > 12 ? ", \u2026" : ""}`,
+      hint: close !== void 0 ? `Names are case-sensitive: did you mean "${close}"?` : `Name one of the ${catalogue.noun}s listed.`
+    }
+  ]);
+}
+function partner(all, name, role) {
+  const parts = parseName(name);
+  if (parts === void 0) return void 0;
+  const group = all.find((g) => g.base === parts.base && g.qualifier === parts.qualifier);
+  return group?.[role][0]?.name;
+}
+function pickByFlags(series, options, catalogue) {
+  const find = (name, flag) => {
+    const s = series.find((x) => x.name === name);
+    if (s === void 0) throw notFound(catalogue, name, series, flag);
+    return s;
+  };
+  const all = groups(series);
+  const lookUp = options.exact !== true;
+  const validationName = options.validation ?? (options.train === void 0 || !lookUp ? void 0 : partner(all, options.train, "validation"));
+  if (validationName === void 0) {
+    throw new InputError([
+      {
+        file: catalogue.file,
+        pointer: catalogue.pointer,
+        expected: `must have a validation ${catalogue.noun} to go with "${options.train}"`,
+        hint: "Name it with --validation."
+      }
+    ]);
+  }
+  const validation = find(validationName, "validation");
+  const trainName = options.train ?? (options.validation === void 0 || !lookUp ? void 0 : partner(all, validationName, "train"));
+  const train = trainName === void 0 ? void 0 : find(trainName, "train");
+  const warnings = [];
+  if (train === void 0) warnings.push({ code: "no-train-series", validation: validation.name });
+  return {
+    validation,
+    ...train === void 0 ? {} : { train },
+    by: "flags",
+    base: parseName(validationName)?.base ?? validationName,
+    alternatives: [],
+    warnings
+  };
+}
+function pickSeries(series, options, catalogue) {
+  if (options.train !== void 0 || options.validation !== void 0)
+    return pickByFlags(series, options, catalogue);
+  const all = groups(series).filter((g) => g.validation.length > 0);
+  if (all.length === 0) {
+    throw new InputError([
+      {
+        file: catalogue.file,
+        pointer: catalogue.pointer,
+        expected: `must have a validation ${catalogue.noun} (such as "val_loss", "val/loss" or an eval set)`,
+        got: series.length === 0 ? "none" : series.slice(0, 12).map((s) => JSON.stringify(s.name)).join(", "),
+        hint: "Name the series to use with --validation (and --train)."
+      }
+    ]);
+  }
+  const metric = options.metric;
+  const score = (g) => {
+    const m = metric === void 0 ? void 0 : matchScore(g.base, metric);
+    if (m !== void 0) return m;
+    return g.base === "loss" ? 10 : 20 - g.last / (series.length + 1);
+  };
+  const ranked = [...all].sort((a, b) => score(a) - score(b));
+  const best = ranked[0];
+  const rivals = ranked.filter((g) => g.base === best.base && g.qualifier !== best.qualifier);
+  if (rivals.length > 0) {
+    const runs = [best, ...rivals].map(
+      (g) => quote(g.qualifier === "" ? "(top level)" : g.qualifier)
+    );
+    throw new InputError([
+      {
+        file: catalogue.file,
+        pointer: "",
+        expected: `must hold one run, but several log "${best.base}"`,
+        got: runs.join(", "),
+        hint: "Name one run folder as PATH, or name the series with --train and --validation."
+      }
+    ]);
+  }
+  const warnings = [];
+  const guessed = guessPositional(best);
+  const validationParts = guessed?.validation ?? best.validation[0];
+  const trainParts = guessed?.train ?? best.train[0];
+  if (guessed !== void 0)
+    warnings.push({
+      code: "eval-sets-guessed",
+      train: guessed.train.name,
+      validation: guessed.validation.name
+    });
+  const validation = series.find((s) => s.name === validationParts.name);
+  const train = trainParts === void 0 ? void 0 : series.find((s) => s.name === trainParts.name);
+  if (train === void 0) warnings.push({ code: "no-train-series", validation: validation.name });
+  return {
+    validation,
+    ...train === void 0 ? {} : { train },
+    by: "names",
+    base: best.base,
+    alternatives: ranked.slice(1).map((g) => g.validation[0].name),
+    warnings
+  };
+}
+
+// src/artifact/curve-logs/types.ts
+var CURVE_LOG_FORMATS = [
+  "csv-log",
+  "tensorboard",
+  "mlflow",
+  "evals-result"
+];
+function pointerOf(where, at) {
+  if (where.kind === "json") return `${where.path}/${at}`;
+  return `${where.kind} ${at}`;
+}
+
+// src/artifact/curve-logs/curve.ts
+function collapse(series, mode, warnings) {
+  if (series.problems.length > 0) throw new InputError(series.problems);
+  const means = /* @__PURE__ */ new Map();
+  let previous;
+  for (const p of series.points) {
+    if (mode === "reject" && previous !== void 0 && !(p.x > previous)) {
+      throw new InputError([
+        {
+          file: series.file,
+          pointer: pointerOf(series.where, p.at),
+          expected: `"${series.x}" must strictly increase (previous ${previous})`,
+          got: String(p.x)
+        }
+      ]);
+    }
+    previous = p.x;
+    const entry = means.get(p.x);
+    if (entry === void 0) means.set(p.x, { mean: p.value, n: 1 });
+    else {
+      entry.n++;
+      entry.mean += p.value / entry.n - entry.mean / entry.n;
+    }
+  }
+  let merged = 0;
+  const out = /* @__PURE__ */ new Map();
+  for (const [x, { mean: mean2, n }] of means) {
+    if (n > 1) merged++;
+    out.set(x, mean2);
+  }
+  if (merged > 0) warnings.push({ code: "duplicates-averaged", series: series.name, xs: merged });
+  return out;
+}
+function buildCurve(read, catalogue, options = {}) {
+  const picked = pickSeries(read.series, options, catalogue);
+  const warnings = [...read.warnings, ...picked.warnings];
+  const mode = options.duplicates ?? "average";
+  const { validation, train } = picked;
+  const units = unitsFor(picked.base, validation.name, options.metric);
+  if (units.warning !== void 0) warnings.push(units.warning);
+  const conversion = units.conversion;
+  const toMetric = (v) => {
+    if (conversion === void 0) return v;
+    const converted = convert(conversion, v);
+    if (!Number.isFinite(converted))
+      throw new InputError([
+        {
+          file: validation.file,
+          pointer: "",
+          expected: `must have values that stay finite in the metric's units (${conversion})`,
+          got: String(v)
+        }
+      ]);
+    return converted;
+  };
+  const validationByX = collapse(validation, mode, warnings);
+  const trainByX = train === void 0 ? void 0 : collapse(train, mode, warnings);
+  if (validationByX.size === 0) {
+    throw new InputError([
+      {
+        file: validation.file,
+        pointer: "",
+        expected: `must have at least one value of "${validation.name}"`,
+        hint: "Check that the run got as far as a validation pass, or name another series."
+      }
+    ]);
+  }
+  const xs = [...validationByX.keys()].sort((a, b) => a - b);
+  let missing = 0;
+  const points = xs.map((x) => {
+    const point = { x, validation: toMetric(validationByX.get(x)) };
+    const t = trainByX?.get(x);
+    if (t !== void 0) point.train = toMetric(t);
+    else if (trainByX !== void 0) missing++;
+    return point;
+  });
+  if (train !== void 0 && trainByX !== void 0) {
+    if (missing > 0) warnings.push({ code: "train-missing", series: train.name, points: missing });
+    let dropped = 0;
+    for (const x of trainByX.keys()) if (!validationByX.has(x)) dropped++;
+    if (dropped > 0)
+      warnings.push({ code: "train-only-dropped", series: train.name, points: dropped });
+  }
+  const files = [.../* @__PURE__ */ new Set([validation.file, ...train === void 0 ? [] : [train.file]])];
+  return {
+    points,
+    validation: validation.name,
+    ...train === void 0 ? {} : { train: train.name },
+    by: picked.by,
+    x: validation.x,
+    files,
+    alternatives: picked.alternatives,
+    warnings
+  };
+}
+
+// src/io/curve-logs.ts
+import { readFile as readFile3, readdir as readdir2, stat as stat2 } from "node:fs/promises";
+import { basename, dirname as dirname3, join as join3, relative as relative2, sep as sep2 } from "node:path";
+var nodeCurveLogFs = {
+  readFile: (path) => readFile3(path),
+  readdir: async (path) => (await readdir2(path, { withFileTypes: true })).map((d) => ({
+    name: d.name,
+    kind: d.isFile() ? "file" : d.isDirectory() ? "dir" : "other"
+  })),
+  stat: async (path) => {
+    try {
+      const s = await stat2(path);
+      return { kind: s.isFile() ? "file" : s.isDirectory() ? "dir" : "other", size: s.size };
+    } catch {
+      return { kind: "missing", size: 0 };
+    }
+  }
+};
+var MAX_DEPTH = 8;
+var MAX_ENTRIES = 5e4;
+function problem(display, expected, hint) {
+  const issue = { file: display, pointer: "", expected };
+  if (hint !== void 0) issue.hint = hint;
+  return new InputError([issue]);
+}
+function joinDisplay(display, rel) {
+  const d = display.replace(/[\\/]+$/, "");
+  return d === "" || d === "." ? rel : `${d}/${rel}`;
+}
+async function search(fs, root, match, want) {
+  const found = [];
+  let queue = [{ path: root.path, rel: "" }];
+  let seen = 0;
+  for (let depth = 0; depth <= MAX_DEPTH && queue.length > 0; depth++) {
+    const next = [];
+    for (const dir of queue) {
+      const entries = await fs.readdir(dir.path);
+      seen += entries.length;
+      if (seen > MAX_ENTRIES)
+        throw problem(
+          root.display,
+          `holds more than ${MAX_ENTRIES} entries to search`,
+          "Name a folder closer to the log."
+        );
+      for (const e of entries.sort((a, b) => a.name < b.name ? -1 : a.name > b.name ? 1 : 0)) {
+        const rel = dir.rel === "" ? e.name : `${dir.rel}/${e.name}`;
+        const path = join3(dir.path, e.name);
+        if (e.kind === want && match(e.name))
+          found.push({ path, display: joinDisplay(root.display, rel), rel });
+        if (e.kind === "dir" && e.name !== ".trash" && e.name !== "node_modules")
+          next.push({ path, rel });
+      }
+    }
+    queue = next;
+  }
+  return found;
+}
+async function readLogFile(fs, file, maxBytes) {
+  const { kind, size } = await fs.stat(file.path);
+  if (kind !== "file") throw problem(file.display, "must be a readable file");
+  if (size > maxBytes)
+    throw problem(
+      file.display,
+      `must be at most ${maxBytes / 1024 / 1024} MiB (it has ${size} bytes)`,
+      "Import a shorter log, or thin it out first."
+    );
+  return fs.readFile(file.path);
+}
+async function kindOf(fs, p) {
+  const { kind } = await fs.stat(p.path);
+  if (kind === "missing" || kind === "other")
+    throw problem(p.display, kind === "missing" ? "does not exist" : "must be a file or a folder");
+  return kind;
+}
+async function oneFile(fs, root, match, what) {
+  if (await kindOf(fs, root) === "file") return root;
+  const found = await search(fs, root, match, "file");
+  const [first] = found;
+  if (first === void 0)
+    throw problem(root.display, `must hold ${what}`, "Name the log file itself.");
+  if (found.length > 1)
+    throw problem(
+      root.display,
+      `must hold one ${what}, but holds ${found.length}: ${found.slice(0, 5).map((f) => f.display).join(", ")}${found.length > 5 ? ", \u2026" : ""}`,
+      "Name the one to import."
+    );
+  return first;
+}
+function pool(results) {
+  const byName = /* @__PURE__ */ new Map();
+  const warnings = results.flatMap((r) => r.warnings);
+  for (const r of results) {
+    for (const s of r.series) {
+      const seen = byName.get(s.name);
+      if (seen === void 0)
+        byName.set(s.name, { ...s, points: [...s.points], problems: [...s.problems] });
+      else {
+        for (const p of s.points) seen.points.push(p);
+        seen.problems.push(...s.problems.slice(0, Math.max(0, 10 - seen.problems.length)));
+      }
+    }
+  }
+  return { series: [...byName.values()], warnings };
+}
+function commonDir(paths) {
+  const split = paths.map((p) => dirname3(p).split(sep2));
+  const first = split[0] ?? [];
+  let n = first.length;
+  for (const parts of split) {
+    let i = 0;
+    while (i < n && parts[i] === first[i]) i++;
+    n = i;
+  }
+  return first.slice(0, n).join(sep2);
+}
+async function readTensorBoardLogs(fs, paths, budget) {
+  const files = [];
+  for (const p of paths) {
+    if (await kindOf(fs, p) === "file") files.push(p);
+    else {
+      const found = await search(fs, p, (n) => n.startsWith("events.out.tfevents."), "file");
+      if (found.length === 0)
+        throw problem(
+          p.display,
+          "must hold a TensorBoard event file (events.out.tfevents.*)",
+          "Name the log folder of one run."
+        );
+      files.push(...found);
+    }
+  }
+  const common = commonDir(files.map((f) => f.path));
+  const results = [];
+  for (const f of files) {
+    const label = relative2(common, dirname3(f.path)).split(sep2).join("/");
+    const read = readTensorBoard(await readLogFile(fs, f, MAX_EVENT_FILE_BYTES), f.display, {
+      budget
+    });
+    if (label !== "") for (const s of read.series) s.name = `${label}/${s.name}`;
+    results.push(read);
+  }
+  return pool(results);
+}
+async function readMlflowLogs(fs, paths, budget) {
+  const results = [];
+  let catalogueFile = "";
+  for (const p of paths) {
+    if (await kindOf(fs, p) === "file") {
+      const segments = p.display.split(/[\\/]/);
+      const at = segments.lastIndexOf("metrics");
+      const key = at >= 0 && at < segments.length - 1 ? segments.slice(at + 1).join("/") : basename(p.path);
+      results.push(
+        readMlflowMetric(await readLogFile(fs, p, MAX_TEXT_BYTES), p.display, key, { budget })
+      );
+      catalogueFile ||= p.display;
+      continue;
+    }
+    const metricsDirs = basename(p.path) === "metrics" ? [p] : await search(fs, p, (n) => n === "metrics", "dir");
+    const [metrics] = metricsDirs;
+    if (metrics === void 0)
+      throw problem(
+        p.display,
+        "must hold an MLflow run (a metrics/ folder)",
+        "Name mlruns/<experiment>/<run>."
+      );
+    if (metricsDirs.length > 1)
+      throw problem(
+        p.display,
+        `must hold one MLflow run, but holds ${metricsDirs.length}: ${metricsDirs.slice(0, 5).map((m) => m.display.replace(/\/metrics$/, "")).join(", ")}${metricsDirs.length > 5 ? ", \u2026" : ""}`,
+        "Name the run folder, mlruns/<experiment>/<run>."
+      );
+    catalogueFile ||= metrics.display;
+    for (const f of await search(fs, metrics, () => true, "file")) {
+      const key = f.rel;
+      results.push(
+        readMlflowMetric(await readLogFile(fs, f, MAX_TEXT_BYTES), f.display, key, { budget })
+      );
+    }
+  }
+  return { read: pool(results), file: catalogueFile };
+}
+async function readCurveLogs(format, paths, fs, options = {}) {
+  const budget = new PointBudget();
+  const shown = paths.map((p) => p.display).join(", ");
+  let read;
+  let catalogue;
+  if (format === "csv-log") {
+    const results = [];
+    const files = [];
+    for (const p of paths) {
+      const file = await oneFile(fs, p, (n) => /\.csv$/i.test(n), "CSV log (*.csv)");
+      files.push(file.display);
+      const bytes = await readLogFile(fs, file, MAX_TEXT_BYTES);
+      results.push(
+        readCsvLog(bytes, file.display, {
+          budget,
+          ...options.x === void 0 ? {} : { x: options.x }
+        })
+      );
+    }
+    read = pool(results);
+    catalogue = { file: files.join(", "), pointer: "line 1", noun: "column" };
+  } else if (format === "tensorboard") {
+    read = await readTensorBoardLogs(fs, paths, budget);
+    catalogue = { file: shown, pointer: "", noun: "tag" };
+  } else if (format === "mlflow") {
+    const found = await readMlflowLogs(fs, paths, budget);
+    read = found.read;
+    catalogue = { file: found.file, pointer: "", noun: "metric" };
+  } else {
+    const results = [];
+    for (const p of paths) {
+      const file = await oneFile(
+        fs,
+        p,
+        (n) => /\.json$/i.test(n),
+        "evals_result JSON file (*.json)"
+      );
+      results.push(
+        readEvalsResult(await readLogFile(fs, file, MAX_TEXT_BYTES), file.display, { budget })
+      );
+    }
+    read = pool(results);
+    catalogue = { file: shown, pointer: "", noun: "eval-set metric" };
+  }
+  if (read.series.length > MAX_SERIES)
+    throw problem(shown, `must hold at most ${MAX_SERIES} series`, "Name fewer or smaller logs.");
+  if (options.x === "epoch" && (format === "tensorboard" || format === "mlflow"))
+    read = stepsToEpochs(read, catalogue.file);
+  return { read, catalogue };
+}
+
+// src/report/curve-log-notes.ts
+var CONVERSION_WORDS = {
+  "one-minus": "1 \u2212 value",
+  sqrt: "the square root",
+  square: "the square"
+};
+function curveLogWarningText(w) {
+  switch (w.code) {
+    case "loss-not-metric":
+      return w.metric === void 0 ? `"${w.series}" is a loss, not necessarily the run's metric; the artifact's curves must be in the metric's units. Pass --metric NAME, or name metric series with --train and --validation.` : `"${w.series}" is a loss, not the metric "${w.metric}"; the artifact's curves must be in the metric's units. Name the metric's series with --train and --validation if the log has them.`;
+    case "units-unchecked":
+      return w.metric === void 0 ? `Check that "${w.series}" is in the units of the run's metric (pass --metric NAME to have it checked).` : `Could not tell whether "${w.series}" is in the units of "${w.metric}"; check it.`;
+    case "converted":
+      return `Converted "${w.series}" to the units of "${w.metric}" (${CONVERSION_WORDS[w.conversion]}).`;
+    case "duplicates-averaged":
+      return `"${w.series}" had several values at ${w.xs} x value(s); each was replaced by their mean.`;
+    case "no-train-series":
+      return `No training series pairs with "${w.validation}"; the curve has validation values only (name one with --train).`;
+    case "train-missing":
+      return `"${w.series}" has no value at ${w.points} point(s) of the curve; those points have no train value.`;
+    case "train-only-dropped":
+      return `${w.points} value(s) of "${w.series}" at an x with no validation value were left out.`;
+    case "truncated-record":
+      return `${w.file} ends inside a record at byte ${w.offset} (still being written?); the records before it were read.`;
+    case "non-scalar-skipped":
+      return `${w.file}: skipped ${w.count} summary value(s) that are not numeric scalars (histograms, images, text).`;
+    case "eval-sets-guessed":
+      return `Took eval set "${w.train}" as training data and "${w.validation}" as validation data (eval_set order); name them with --train and --validation if that is wrong.`;
+  }
+}
+function curveImportNotes(curve, out) {
+  const series = curve.train === void 0 ? `validation "${curve.validation}"` : `train "${curve.train}" and validation "${curve.validation}"`;
+  const how = curve.by === "flags" ? "Took" : "Picked";
+  const others = curve.alternatives.length === 0 ? "" : ` Others: ${curve.alternatives.slice(0, 6).map((a) => `"${a}"`).join(", ")}${curve.alternatives.length > 6 ? ", \u2026" : ""}.`;
+  return [
+    `${how} ${series} from ${curve.files.join(", ")} (x: ${curve.x}); wrote ${curve.points.length} point(s) to ${out}.${others}`,
+    ...curve.warnings.map(curveLogWarningText)
+  ];
+}
+
+// src/entries/cli/curves-import.ts
+var CURVES_HELP = `Usage: fitgap curves import --from FORMAT PATH... --out FILE [options]
+
+Commands:
+  import     turn a training log into a run artifact's epoch curve
+
+Run 'fitgap curves import --help' for its options.
+`;
+var CURVES_IMPORT_HELP = `Usage: fitgap curves import --from FORMAT PATH... --out FILE [options]
+
+Read a training log and write its epoch curve as {"epochs": [{x, train, validation}]},
+the shape of a run artifact's "curves". PATH is a log file or a folder to search.
+
+Formats (--from):
+  csv-log         per-epoch CSV (Keras CSVLogger; Lightning CSVLogger's metrics.csv)
+  tensorboard     TensorBoard event files (events.out.tfevents.*)
+  mlflow          an MLflow run folder (mlruns/EXPERIMENT/RUN) or its metric files
+  evals-result    XGBoost or LightGBM evals_result JSON (x: boosting round from 1)
+
+Options:
+  --from FORMAT         log format (required)
+  --out FILE            file to write the curve JSON to (required)
+  --train SERIES        training series (default: picked by name, such as loss)
+  --validation SERIES   validation series (default: picked by name, such as val_loss)
+  --metric NAME         the run's metric (accuracy, error, rmse, ...): pick its series
+                        and convert accuracy/error and MSE/RMSE into its units
+  --x epoch|step        x for csv-log (the column), tensorboard and mlflow (epoch: via
+                        the logged "epoch" series); default epoch for csv-log, else step
+  -h, --help            show this help
+
+Values of one series at the same x are averaged; points are sorted by x.
+Exit codes: 0 curve written; 2 bad input or usage.
+`;
+var FLAGS = {
+  from: { type: "string" },
+  out: { type: "string" },
+  train: { type: "string" },
+  validation: { type: "string" },
+  metric: { type: "string" },
+  x: { type: "string" },
+  help: { type: "boolean", short: "h" }
+};
+var COMMAND = "curves import";
+function text(values, flag) {
+  const value = values[flag];
+  if (value === "") throw new UsageError(`fitgap ${COMMAND}: --${flag} must not be empty.`);
+  return typeof value === "string" ? value : void 0;
+}
+async function curvesImportCommand(argv, io, fs = nodeCurveLogFs) {
+  const { values, positionals } = parseFlags(argv, FLAGS, COMMAND);
+  if (values["help"] === true) {
+    io.stdout(CURVES_IMPORT_HELP);
+    return EXIT.ok;
+  }
+  const from = text(values, "from");
+  if (from === void 0 || !CURVE_LOG_FORMATS.includes(from)) {
+    throw new UsageError(
+      `fitgap ${COMMAND}: --from must be one of ${CURVE_LOG_FORMATS.join(", ")}${from === void 0 ? "" : ` (got ${JSON.stringify(from)})`}. Run 'fitgap ${COMMAND} --help'.`
+    );
+  }
+  const format = from;
+  const out = text(values, "out");
+  if (out === void 0)
+    throw new UsageError(
+      `fitgap ${COMMAND}: --out FILE is required. Run 'fitgap ${COMMAND} --help'.`
+    );
+  if (positionals.length === 0)
+    throw new UsageError(`fitgap ${COMMAND}: name at least one log file or folder.`);
+  const x = text(values, "x");
+  if (x !== void 0 && x !== "epoch" && x !== "step")
+    throw new UsageError(
+      `fitgap ${COMMAND}: --x must be epoch or step (got ${JSON.stringify(x)}).`
+    );
+  if (x !== void 0 && format === "evals-result")
+    throw new UsageError(
+      `fitgap ${COMMAND}: --x does not apply to evals-result; x is the boosting round.`
+    );
+  const train = text(values, "train");
+  const validation = text(values, "validation");
+  const metric = text(values, "metric");
+  const paths = positionals.map((p) => ({ path: resolve4(io.cwd, p), display: p }));
+  const { read, catalogue } = await readCurveLogs(format, paths, fs, x === void 0 ? {} : { x });
+  const curve = buildCurve(read, catalogue, {
+    ...train === void 0 ? {} : { train },
+    ...validation === void 0 ? {} : { validation },
+    ...metric === void 0 ? {} : { metric }
+  });
+  const epochs2 = curve.points.map(
+    (p) => p.train === void 0 ? { x: p.x, validation: p.validation } : { x: p.x, train: p.train, validation: p.validation }
+  );
+  await io.writeFile(resolve4(io.cwd, out), `${JSON.stringify({ epochs: epochs2 }, null, 2)}
+`);
+  for (const line of curveImportNotes(curve, out)) io.stderr(`fitgap: ${line}
+`);
+  return EXIT.ok;
+}
+async function curvesCommand(argv, io, fs = nodeCurveLogFs) {
+  const [sub, ...rest] = argv;
+  if (sub === "import") return curvesImportCommand(rest, io, fs);
+  if (sub === void 0 || sub === "--help" || sub === "-h" || sub === "help") {
+    io.stdout(CURVES_HELP);
+    return sub === void 0 ? EXIT.badInput : EXIT.ok;
+  }
+  throw new UsageError(
+    `fitgap curves: unknown command ${JSON.stringify(sub)}. Run 'fitgap curves --help'.`
+  );
+}
+
 // src/entries/cli/main.ts
 async function runCli(argv, io) {
   const [command, ...rest] = argv;
@@ -24011,6 +25572,8 @@ async function runCli(argv, io) {
         return await validateCommand(rest, io);
       case "demo":
         return await demoCommand(rest, io);
+      case "curves":
+        return await curvesCommand(rest, io);
       case "--version":
       case "-v":
         io.stdout(`${io.version}
@@ -24105,11 +25668,11 @@ var package_default = {
 // src/entries/cli.ts
 var version = package_default.version;
 runCli(process.argv.slice(2), {
-  stdout: (text) => process.stdout.write(text),
-  stderr: (text) => process.stderr.write(text),
+  stdout: (text2) => process.stdout.write(text2),
+  stderr: (text2) => process.stderr.write(text2),
   color: process.stdout.isTTY === true && process.env["NO_COLOR"] === void 0,
   cwd: process.cwd(),
-  writeFile: (path, text) => writeFile(path, text, "utf8"),
+  writeFile: (path, text2) => writeFile(path, text2, "utf8"),
   demoDir: fileURLToPath(new URL("../demo/", import.meta.url)),
   version
 }).then(
