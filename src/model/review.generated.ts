@@ -520,7 +520,11 @@ export interface SweepMinimumEvidence {
   current: number | null;
   suggestedX: number;
   /**
-   * true: the minimum lies on this lever's side; false: on the other side; null: not known.
+   * Where the candidate's own strength sits relative to the minimum.
+   */
+  side: 'below' | 'above' | 'at' | 'unknown';
+  /**
+   * true: the minimum lies on this lever's side; false: it does not (other side, or the candidate is at it); null: not known.
    */
   supports: boolean | null;
   atEdge: 'low' | 'high' | null;
