@@ -7,7 +7,7 @@ import { createHash } from 'node:crypto';
 import { dirname, join, resolve } from 'node:path';
 import { buildReview, type ReviewInput } from '../analysis/review.js';
 import type { Note, PairedPredictions } from '../model/review.js';
-import type { Review, ReviewSettings } from '../model/review.js';
+import type { Review } from '../model/review.js';
 import { loadRun, type LoadedRun } from './load-run.js';
 import { pairPredictions } from '../artifact/predictions.js';
 import { loadConfig } from './load-config.js';
