@@ -15,7 +15,6 @@ describe('src/stats public surface', () => {
       'normalTest',
       'oneSampleT',
       'pairedT',
-      'pooledT',
       'sampleVariance',
       'tCdf',
       'tQuantile',
