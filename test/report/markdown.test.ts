@@ -98,10 +98,9 @@ describe('renderMarkdown', () => {
     );
     expect(items[2]).toBe('Gate failed: worse-validation: validation got significantly worse.');
     expect(items[3]).toBe(
-      'Next lever: Strengthen regularization: This PR lowered weight_decay 0.001 → 0.0001. ' +
-        'Variance rose (+0.770, p < 0.001): the model moved toward overfitting. ' +
-        'The regularization sweep has its lowest validation (6.020) at weight_decay ≈ 0.0003; ' +
-        "the candidate uses 0.0001. Try weight_decay ≈ 0.0003, the sweep's minimum.",
+      'Next lever: Stop training earlier: The candidate has high variance: 1.290 against a ' +
+        'validation error of 6.380. Validation was best at epoch 31 of 80; stopping there saves ' +
+        '0.348 (generalization loss 5.8%).',
     );
   });
 
