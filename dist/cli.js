@@ -22786,6 +22786,20 @@ function changeInterval(ci, f) {
 function valueRange(ci, f) {
   return `${value(ci[0], f)} to ${value(ci[1], f)}`;
 }
+function unitLine(f, values) {
+  if (f.kind !== "proportion") return null;
+  return values === "values" ? "Values in percent; \u0394 and intervals in percentage points." : "Components, \u0394 and intervals in percentage points.";
+}
+function valueCell(v, f) {
+  return digits(v, f);
+}
+function changeCell(v, f) {
+  return signedDigits(v, f);
+}
+function intervalCell(ci, f) {
+  if (ci === null) return "n/a";
+  return `[${signedDigits(ci[0], f)}, ${signedDigits(ci[1], f)}]`;
+}
 var SMALLEST_P = 1e-3;
 function pCell(p) {
   if (p === null) return "n/a";
@@ -23037,12 +23051,13 @@ function splitsTable(review, esc) {
       "Reading"
     ],
     align: ["l", "r", "r", "r", "r", "r", "l"],
+    units: unitLine(f, "values"),
     rows: review.splits.map((s) => [
       say(SPLIT_WORD, s.split, esc),
-      value(s.baseline, f),
-      value(s.candidate, f),
-      change(s.delta.estimate, f),
-      changeInterval(s.delta.ci, f),
+      valueCell(s.baseline, f),
+      valueCell(s.candidate, f),
+      changeCell(s.delta.estimate, f),
+      intervalCell(s.delta.ci, f),
       pCell(s.delta.p),
       reading(s.delta.call, review)
     ])
@@ -23053,7 +23068,7 @@ function decompositionTable(review, esc, compact = false) {
   const cell = (run, name) => {
     const c = review[run].components[name];
     if (c.value === null) return "n/a";
-    return `${difference(c.value, f)}${c.present ? compact ? "*" : " (present)" : ""}`;
+    return `${valueCell(c.value, f)}${c.present ? compact ? "*" : " (present)" : ""}`;
   };
   const deltas = {
     bias: review.bias.delta,
@@ -23067,15 +23082,16 @@ function decompositionTable(review, esc, compact = false) {
     if (d === null) return [...row, "n/a", "n/a", ...compact ? [] : ["n/a"], "n/a"];
     return [
       ...row,
-      change(d.estimate, f),
-      changeInterval(d.ci, f),
+      changeCell(d.estimate, f),
+      intervalCell(d.ci, f),
       ...compact ? [] : [pCell(d.p)],
       componentReading(d.call, compact)
     ];
   });
+  const units = unitLine(f, "differences");
   const header = ["Component", "Baseline", "Candidate", "\u0394", `${levelPercent(review)}% interval`];
   if (compact) {
-    return { header: [...header, "Call"], align: ["l", "r", "r", "r", "r", "l"], rows };
+    return { header: [...header, "Call"], align: ["l", "r", "r", "r", "r", "l"], rows, units };
   }
   rows.push([
     "Diagnosis",
@@ -23086,7 +23102,12 @@ function decompositionTable(review, esc, compact = false) {
     "",
     ""
   ]);
-  return { header: [...header, "p", "Call"], align: ["l", "r", "r", "r", "r", "r", "l"], rows };
+  return {
+    header: [...header, "p", "Call"],
+    align: ["l", "r", "r", "r", "r", "r", "l"],
+    rows,
+    units
+  };
 }
 function diagnosisLine(review, esc) {
   return `Diagnosis: baseline ${say(DIAGNOSIS_WORD, review.baseline.diagnosis, esc)}; candidate ${say(DIAGNOSIS_WORD, review.candidate.diagnosis, esc)}.`;
@@ -23121,16 +23142,17 @@ function slicesTable(review, esc, limit) {
   const rows = sortSlices(review).slice(0, limit).map((s) => [
     esc(s.name),
     s.examples === null ? "n/a" : count(s.examples),
-    value(s.baseline, f),
-    value(s.candidate, f),
-    change(s.delta.estimate, f),
+    valueCell(s.baseline, f),
+    valueCell(s.candidate, f),
+    changeCell(s.delta.estimate, f),
     pCell(s.pAdjusted),
     s.hiddenRegression ? "worse (hidden)" : SLICE_CHANGE.get(s.change) ?? esc(s.change, 20)
   ]);
   return {
     header: ["Slice", "Examples", "Baseline", "Candidate", "\u0394", "p (Holm)", "Change"],
     align: ["l", "r", "r", "r", "r", "r", "l"],
-    rows
+    rows,
+    units: unitLine(f, "values")
   };
 }
 function sliceCounts(slices2) {
@@ -23685,7 +23707,10 @@ Too large for this space: see the JSON report.
   return stub.length <= target ? stub : stub.slice(0, Math.max(0, target));
 }
 function table(t) {
-  return markdownTable([t.header, ...t.rows], { align: t.align, alignDelimiters: false });
+  const body = markdownTable([t.header, ...t.rows], { align: t.align, alignDelimiters: false });
+  return t.units === void 0 || t.units === null ? body : `${t.units}
+
+${body}`;
 }
 function details(summary, body) {
   return ["<details>", `<summary>${summary}</summary>`, "", ...body, "", "</details>", ""];
@@ -23879,7 +23904,7 @@ function withoutColumn(t, header) {
   const c = t.header.indexOf(header);
   if (c < 0) return t;
   const drop = (row) => row.filter((_, i) => i !== c);
-  return { header: drop(t.header), align: drop(t.align), rows: t.rows.map(drop) };
+  return { ...t, header: drop(t.header), align: drop(t.align), rows: t.rows.map(drop) };
 }
 function wrap(text, width, indent, first = indent) {
   const lines = [];
@@ -23927,7 +23952,8 @@ function textTable(t, width) {
     widths.map((_, c) => c),
     2
   );
-  return rows.map((r) => {
+  const units = t.units === void 0 || t.units === null ? [] : wrap(t.units, width, "  ");
+  const lines = rows.map((r) => {
     const cells = widths.map((w, c) => {
       const cell = truncate(r[c] ?? "", w);
       const pad = " ".repeat(Math.max(0, w - len(cell)));
@@ -23935,6 +23961,7 @@ function textTable(t, width) {
     });
     return `  ${cells.join("  ")}`.trimEnd();
   });
+  return [...units, ...lines];
 }
 
 // src/report/json.ts
@@ -24187,12 +24214,13 @@ var package_default = {
   scripts: {
     build: "node scripts/build.mjs",
     typecheck: "tsc --noEmit",
-    lint: "eslint . && prettier --check . && npm run -s lint:layers",
+    lint: "eslint . && prettier --check . && npm run -s lint:layers && node scripts/review-types.mjs --check",
     format: "prettier --write .",
     test: "vitest run",
     demo: "npm run -s build && node dist/cli.js demo",
     bench: "node scripts/bench.mjs",
-    "lint:layers": "depcruise src --config .dependency-cruiser.cjs"
+    "lint:layers": "depcruise src --config .dependency-cruiser.cjs",
+    "schema:types": "node scripts/review-types.mjs"
   },
   dependencies: {
     "@actions/core": "3.0.1",
@@ -24205,7 +24233,6 @@ var package_default = {
     fflate: "0.8.3",
     jstat: "1.9.6",
     "markdown-table": "3.1.0",
-    "ml-levenberg-marquardt": "5.1.0",
     yaml: "2.9.1"
   },
   devDependencies: {

@@ -46166,6 +46166,20 @@ function changeInterval(ci, f) {
 function valueRange(ci, f) {
   return `${value(ci[0], f)} to ${value(ci[1], f)}`;
 }
+function unitLine(f, values) {
+  if (f.kind !== "proportion") return null;
+  return values === "values" ? "Values in percent; \u0394 and intervals in percentage points." : "Components, \u0394 and intervals in percentage points.";
+}
+function valueCell(v, f) {
+  return digits(v, f);
+}
+function changeCell(v, f) {
+  return signedDigits(v, f);
+}
+function intervalCell(ci, f) {
+  if (ci === null) return "n/a";
+  return `[${signedDigits(ci[0], f)}, ${signedDigits(ci[1], f)}]`;
+}
 var SMALLEST_P = 1e-3;
 function pCell(p) {
   if (p === null) return "n/a";
@@ -46560,12 +46574,13 @@ function splitsTable(review, esc) {
       "Reading"
     ],
     align: ["l", "r", "r", "r", "r", "r", "l"],
+    units: unitLine(f, "values"),
     rows: review.splits.map((s) => [
       say(SPLIT_WORD, s.split, esc),
-      value(s.baseline, f),
-      value(s.candidate, f),
-      change(s.delta.estimate, f),
-      changeInterval(s.delta.ci, f),
+      valueCell(s.baseline, f),
+      valueCell(s.candidate, f),
+      changeCell(s.delta.estimate, f),
+      intervalCell(s.delta.ci, f),
       pCell(s.delta.p),
       reading(s.delta.call, review)
     ])
@@ -46576,7 +46591,7 @@ function decompositionTable(review, esc, compact = false) {
   const cell = (run, name) => {
     const c = review[run].components[name];
     if (c.value === null) return "n/a";
-    return `${difference(c.value, f)}${c.present ? compact ? "*" : " (present)" : ""}`;
+    return `${valueCell(c.value, f)}${c.present ? compact ? "*" : " (present)" : ""}`;
   };
   const deltas = {
     bias: review.bias.delta,
@@ -46590,15 +46605,16 @@ function decompositionTable(review, esc, compact = false) {
     if (d === null) return [...row, "n/a", "n/a", ...compact ? [] : ["n/a"], "n/a"];
     return [
       ...row,
-      change(d.estimate, f),
-      changeInterval(d.ci, f),
+      changeCell(d.estimate, f),
+      intervalCell(d.ci, f),
       ...compact ? [] : [pCell(d.p)],
       componentReading(d.call, compact)
     ];
   });
+  const units = unitLine(f, "differences");
   const header = ["Component", "Baseline", "Candidate", "\u0394", `${levelPercent(review)}% interval`];
   if (compact) {
-    return { header: [...header, "Call"], align: ["l", "r", "r", "r", "r", "l"], rows };
+    return { header: [...header, "Call"], align: ["l", "r", "r", "r", "r", "l"], rows, units };
   }
   rows.push([
     "Diagnosis",
@@ -46609,7 +46625,12 @@ function decompositionTable(review, esc, compact = false) {
     "",
     ""
   ]);
-  return { header: [...header, "p", "Call"], align: ["l", "r", "r", "r", "r", "r", "l"], rows };
+  return {
+    header: [...header, "p", "Call"],
+    align: ["l", "r", "r", "r", "r", "r", "l"],
+    rows,
+    units
+  };
 }
 function leversTable(review, esc) {
   const f = numberFormatFor(review);
@@ -46641,16 +46662,17 @@ function slicesTable(review, esc, limit) {
   const rows = sortSlices(review).slice(0, limit).map((s) => [
     esc(s.name),
     s.examples === null ? "n/a" : count(s.examples),
-    value(s.baseline, f),
-    value(s.candidate, f),
-    change(s.delta.estimate, f),
+    valueCell(s.baseline, f),
+    valueCell(s.candidate, f),
+    changeCell(s.delta.estimate, f),
     pCell(s.pAdjusted),
     s.hiddenRegression ? "worse (hidden)" : SLICE_CHANGE.get(s.change) ?? esc(s.change, 20)
   ]);
   return {
     header: ["Slice", "Examples", "Baseline", "Candidate", "\u0394", "p (Holm)", "Change"],
     align: ["l", "r", "r", "r", "r", "r", "l"],
-    rows
+    rows,
+    units: unitLine(f, "values")
   };
 }
 function sliceCounts(slices2) {
@@ -47211,7 +47233,10 @@ Too large for this space: see the JSON report.
   return stub.length <= target ? stub : stub.slice(0, Math.max(0, target));
 }
 function table(t) {
-  return markdownTable([t.header, ...t.rows], { align: t.align, alignDelimiters: false });
+  const body = markdownTable([t.header, ...t.rows], { align: t.align, alignDelimiters: false });
+  return t.units === void 0 || t.units === null ? body : `${t.units}
+
+${body}`;
 }
 function details(summary2, body) {
   return ["<details>", `<summary>${summary2}</summary>`, "", ...body, "", "</details>", ""];

@@ -90,6 +90,35 @@ export function valueRange(ci: Interval, f: NumberFormat): string {
   return `${value(ci[0], f)} to ${value(ci[1], f)}`;
 }
 
+/*
+ * Table cells carry no unit; a line above the table says it once (`unitLine`), so that tables
+ * stay narrow.
+ */
+
+/** The units of a table of values and changes, or null for a continuous metric. */
+export function unitLine(f: NumberFormat, values: 'values' | 'differences'): string | null {
+  if (f.kind !== 'proportion') return null;
+  return values === 'values'
+    ? 'Values in percent; Δ and intervals in percentage points.'
+    : 'Components, Δ and intervals in percentage points.';
+}
+
+/** A metric value in a table cell: `9.67` (percent) or `6.050`. */
+export function valueCell(v: number, f: NumberFormat): string {
+  return digits(v, f);
+}
+
+/** A change in a table cell: `+1.17`. */
+export function changeCell(v: number, f: NumberFormat): string {
+  return signedDigits(v, f);
+}
+
+/** The interval of a change in a table cell: `[+0.82, +1.51]`, or `n/a`. */
+export function intervalCell(ci: Interval | null, f: NumberFormat): string {
+  if (ci === null) return 'n/a';
+  return `[${signedDigits(ci[0], f)}, ${signedDigits(ci[1], f)}]`;
+}
+
 /** Below this a p-value is written as a bound. */
 const SMALLEST_P = 0.001;
 

@@ -106,7 +106,8 @@ export function renderMarkdown(review: Review, options: MarkdownOptions = {}): s
 }
 
 function table(t: Table): string {
-  return markdownTable([t.header, ...t.rows], { align: t.align, alignDelimiters: false });
+  const body = markdownTable([t.header, ...t.rows], { align: t.align, alignDelimiters: false });
+  return t.units === undefined || t.units === null ? body : `${t.units}\n\n${body}`;
 }
 
 function details(summary: string, body: string[]): string[] {

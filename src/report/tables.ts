@@ -6,13 +6,13 @@
 import type { ComponentName, Review, SliceChange } from '../model/review.js';
 import { displayValue, type Escape } from './escape.js';
 import {
-  change,
-  changeInterval,
+  changeCell,
   count,
-  difference,
+  intervalCell,
   numberFormatFor,
   pCell,
-  value,
+  unitLine,
+  valueCell,
 } from './format.js';
 import { leverText } from './levers.js';
 import {
@@ -32,6 +32,8 @@ export interface Table {
   header: string[];
   align: Align[];
   rows: string[][];
+  /** The units of the cells, said once above the table (null: the metric's own units). */
+  units?: string | null;
 }
 
 export function splitsTable(review: Review, esc: Escape): Table {
@@ -47,12 +49,13 @@ export function splitsTable(review: Review, esc: Escape): Table {
       'Reading',
     ],
     align: ['l', 'r', 'r', 'r', 'r', 'r', 'l'],
+    units: unitLine(f, 'values'),
     rows: review.splits.map((s) => [
       say(SPLIT_WORD, s.split, esc),
-      value(s.baseline, f),
-      value(s.candidate, f),
-      change(s.delta.estimate, f),
-      changeInterval(s.delta.ci, f),
+      valueCell(s.baseline, f),
+      valueCell(s.candidate, f),
+      changeCell(s.delta.estimate, f),
+      intervalCell(s.delta.ci, f),
       pCell(s.delta.p),
       reading(s.delta.call, review),
     ]),
@@ -69,7 +72,7 @@ export function decompositionTable(review: Review, esc: Escape, compact = false)
   const cell = (run: 'baseline' | 'candidate', name: ComponentName): string => {
     const c = review[run].components[name];
     if (c.value === null) return 'n/a';
-    return `${difference(c.value, f)}${c.present ? (compact ? '*' : ' (present)') : ''}`;
+    return `${valueCell(c.value, f)}${c.present ? (compact ? '*' : ' (present)') : ''}`;
   };
   const deltas = {
     bias: review.bias.delta,
@@ -83,15 +86,17 @@ export function decompositionTable(review: Review, esc: Escape, compact = false)
     if (d === null) return [...row, 'n/a', 'n/a', ...(compact ? [] : ['n/a']), 'n/a'];
     return [
       ...row,
-      change(d.estimate, f),
-      changeInterval(d.ci, f),
+      changeCell(d.estimate, f),
+      intervalCell(d.ci, f),
       ...(compact ? [] : [pCell(d.p)]),
       componentReading(d.call, compact),
     ];
   });
+  // Components are differences of error levels: in points for a proportion, like changes.
+  const units = unitLine(f, 'differences');
   const header = ['Component', 'Baseline', 'Candidate', 'Δ', `${levelPercent(review)}% interval`];
   if (compact) {
-    return { header: [...header, 'Call'], align: ['l', 'r', 'r', 'r', 'r', 'l'], rows };
+    return { header: [...header, 'Call'], align: ['l', 'r', 'r', 'r', 'r', 'l'], rows, units };
   }
   rows.push([
     'Diagnosis',
@@ -102,7 +107,12 @@ export function decompositionTable(review: Review, esc: Escape, compact = false)
     '',
     '',
   ]);
-  return { header: [...header, 'p', 'Call'], align: ['l', 'r', 'r', 'r', 'r', 'r', 'l'], rows };
+  return {
+    header: [...header, 'p', 'Call'],
+    align: ['l', 'r', 'r', 'r', 'r', 'r', 'l'],
+    rows,
+    units,
+  };
 }
 
 /** The diagnosis of both runs in one sentence. */
@@ -152,9 +162,9 @@ export function slicesTable(review: Review, esc: Escape, limit: number): Table {
     .map((s) => [
       esc(s.name),
       s.examples === null ? 'n/a' : count(s.examples),
-      value(s.baseline, f),
-      value(s.candidate, f),
-      change(s.delta.estimate, f),
+      valueCell(s.baseline, f),
+      valueCell(s.candidate, f),
+      changeCell(s.delta.estimate, f),
       pCell(s.pAdjusted),
       s.hiddenRegression ? 'worse (hidden)' : (SLICE_CHANGE.get(s.change) ?? esc(s.change, 20)),
     ]);
@@ -162,6 +172,7 @@ export function slicesTable(review: Review, esc: Escape, limit: number): Table {
     header: ['Slice', 'Examples', 'Baseline', 'Candidate', 'Δ', 'p (Holm)', 'Change'],
     align: ['l', 'r', 'r', 'r', 'r', 'r', 'l'],
     rows,
+    units: unitLine(f, 'values'),
   };
 }
 

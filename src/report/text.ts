@@ -139,7 +139,7 @@ function withoutColumn(t: Table, header: string): Table {
   const c = t.header.indexOf(header);
   if (c < 0) return t;
   const drop = <T>(row: readonly T[]): T[] => row.filter((_, i) => i !== c);
-  return { header: drop(t.header), align: drop(t.align), rows: t.rows.map(drop) };
+  return { ...t, header: drop(t.header), align: drop(t.align), rows: t.rows.map(drop) };
 }
 
 /** Word-wraps to `width` columns; the first line starts with `first`, the others with `indent`. */
@@ -195,7 +195,8 @@ export function textTable(t: Table, width: number): string[] {
     widths.map((_, c) => c),
     2,
   );
-  return rows.map((r) => {
+  const units = t.units === undefined || t.units === null ? [] : wrap(t.units, width, '  ');
+  const lines = rows.map((r) => {
     const cells = widths.map((w, c) => {
       const cell = truncate(r[c] ?? '', w);
       const pad = ' '.repeat(Math.max(0, w - len(cell)));
@@ -203,4 +204,5 @@ export function textTable(t: Table, width: number): string[] {
     });
     return `  ${cells.join('  ')}`.trimEnd();
   });
+  return [...units, ...lines];
 }
