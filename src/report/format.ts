@@ -146,7 +146,7 @@ export function short(v: number): string {
   if (v === 0) return '0';
   const abs = Math.abs(v);
   const text = abs >= 1e6 || abs < 1e-4 ? v.toExponential(2) : String(Number(v.toPrecision(4)));
-  return text.replace('-', MINUS);
+  return text.replace(/-/g, MINUS);
 }
 
 /** A number with fixed decimals (R², percentages that are not metric values): `0.987`. */

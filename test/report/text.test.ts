@@ -75,7 +75,9 @@ describe('renderText', () => {
     expect(text).toContain(
       '  Avoidable bias         9.20*      4.80*  −4.40  [−4.70, −4.10]  better',
     );
-    expect(text).toContain('Validation error exceeds train-dev error by 2.20 pts');
+    expect(text.replace(/\n\s*/g, ' ')).toContain(
+      'Validation error exceeds train-dev error by 2.20 pts',
+    );
     // One minus sign: U+2212 in every number, never a hyphen-minus before a digit.
     expect(text).not.toMatch(/(^|[\s(\[])-\d/m);
   });
