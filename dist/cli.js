@@ -20701,7 +20701,10 @@ var RULES = /* @__PURE__ */ new Map([
     )
   ],
   ["data-mismatch", (r) => fired(r.candidate.diagnosis === "data-mismatch", "data-mismatch")],
-  ["validation-overfit", (r) => fired(r.candidate.components.overfit.present, "validation-overfit")],
+  [
+    "validation-overfit",
+    (r) => fired(r.candidate.components.overfit.present, "validation-overfit")
+  ],
   ["none", () => null]
 ]);
 function fired(condition, outcome) {
@@ -20787,7 +20790,12 @@ var Drafts = class {
   add(id, score, evidence, suggestion) {
     const existing = this.#byId.get(id);
     if (existing !== void 0 && existing.score >= score) return;
-    this.#byId.set(id, { id, score, ...suggestion === void 0 ? {} : { suggestion }, evidence });
+    this.#byId.set(id, {
+      id,
+      score,
+      ...suggestion === void 0 ? {} : { suggestion },
+      evidence
+    });
   }
   has(id) {
     return this.#byId.has(id);
@@ -20872,7 +20880,11 @@ function numericChange(p) {
 function ownChangeLevers(ctx, curves, drafts) {
   const towardBias = ctx.movement === "toward-underfitting" || ctx.movement === "worse-on-both";
   const towardVariance = ctx.movement === "toward-overfitting" || ctx.movement === "worse-on-both";
-  const biasChange = { kind: "component-change", component: "bias", delta: ctx.bias };
+  const biasChange = {
+    kind: "component-change",
+    component: "bias",
+    delta: ctx.bias
+  };
   const varianceChange = {
     kind: "component-change",
     component: "variance",
@@ -20882,7 +20894,11 @@ function ownChangeLevers(ctx, curves, drafts) {
     const { baseline: from, candidate: to, key } = p.change;
     if (typeof from !== "number" || typeof to !== "number") continue;
     const change2 = { kind: "pr-change", ...numericChange(p) };
-    const midway = { hyperparameter: key, value: between(from, to), basis: "between-old-and-new" };
+    const midway = {
+      hyperparameter: key,
+      value: between(from, to),
+      basis: "between-old-and-new"
+    };
     if (p.lever === "stronger-regularization" && towardBias) {
       drafts.add("weaker-regularization", REVERSE_OWN_CHANGE, [change2, biasChange], midway);
     }
@@ -21876,7 +21892,11 @@ function analyzeEpochs(points, scale) {
 function analyzeLearningCurve(points, scale) {
   const m = points.map((p) => p.x);
   const e = points.map((p) => scale.toError(p.validation));
-  const tooFew = { skipped: "too-few-points", points: m.length, needs: MIN_POWER_LAW_POINTS };
+  const tooFew = {
+    skipped: "too-few-points",
+    points: m.length,
+    needs: MIN_POWER_LAW_POINTS
+  };
   if (m.length < MIN_POWER_LAW_POINTS) return tooFew;
   const fit = fitPowerLaw(m, e, { lower: scale.lower, upper: scale.upper });
   if ("skipped" in fit) return { ...tooFew, skipped: "fit-failed" };
@@ -22816,7 +22836,7 @@ function short(v) {
   if (v === 0) return "0";
   const abs = Math.abs(v);
   const text = abs >= 1e6 || abs < 1e-4 ? v.toExponential(2) : String(Number(v.toPrecision(4)));
-  return text.replace("-", MINUS);
+  return text.replace(/-/g, MINUS);
 }
 function fixed(v, decimals) {
   const text = v.toFixed(decimals);
@@ -22876,7 +22896,12 @@ var COMPONENT_WORD = words({
   mismatch: "data mismatch",
   overfit: "validation overfit"
 });
-var COMPONENT_ORDER = ["bias", "variance", "mismatch", "overfit"];
+var COMPONENT_ORDER = [
+  "bias",
+  "variance",
+  "mismatch",
+  "overfit"
+];
 var SPLIT_WORD = words({
   train: "train",
   train_dev: "train-dev",
@@ -22943,7 +22968,10 @@ var OUTCOME_SENTENCE = /* @__PURE__ */ new Map([
   ["high-bias", "the candidate has high bias"],
   ["high-variance", "the candidate has high variance"],
   ["data-mismatch", "the candidate shows data mismatch"],
-  ["validation-overfit", "the candidate overfits the validation set (test error well above validation)"]
+  [
+    "validation-overfit",
+    "the candidate overfits the validation set (test error well above validation)"
+  ]
 ]);
 function reasonSentence(reason, review, esc) {
   if (reason.outcome === "any-movement")
@@ -23192,7 +23220,11 @@ function changePhrase(name, delta, review, f) {
   const word = delta.call === "up" ? "rose" : delta.call === "down" ? "fell" : "held steady";
   return `${name} ${word} (${stats})`;
 }
-var GOOD_MOVEMENTS = /* @__PURE__ */ new Set(["better-on-both", "away-from-overfitting", "away-from-underfitting"]);
+var GOOD_MOVEMENTS = /* @__PURE__ */ new Set([
+  "better-on-both",
+  "away-from-overfitting",
+  "away-from-underfitting"
+]);
 function buildHeadline(review, esc) {
   const f = numberFormatFor(review);
   const metric = esc(review.metric.name, 60);
@@ -23229,7 +23261,8 @@ function buildHeadline(review, esc) {
     }
   ];
   const first = review.levers[0];
-  if (first === void 0) lines.push({ label: "Next lever", text: "none suggested.", tone: "neutral" });
+  if (first === void 0)
+    lines.push({ label: "Next lever", text: "none suggested.", tone: "neutral" });
   else {
     const text = leverText(first, review, f, esc);
     lines.push({
@@ -23838,7 +23871,10 @@ function renderText(review, options) {
   const splits = splitsTable(review, esc);
   const fitted = naturalWidth(splits) > width ? withoutColumn(splits, "Reading") : splits;
   out.push("", heading("Splits"), ...textTable(fitted, width), "");
-  out.push(heading("Error decomposition"), ...textTable(decompositionTable(review, esc, true), width));
+  out.push(
+    heading("Error decomposition"),
+    ...textTable(decompositionTable(review, esc, true), width)
+  );
   for (const n of ["* present: large enough to count.", diagnosisLine(review, esc)])
     out.push(...wrap(n, width, "    ", "  "));
   for (const m of unavailableNotes(review, esc)) out.push(...wrap(m, width, "    ", "  - "));

@@ -38,7 +38,10 @@ const RULES = new Map<FailOn, (r: Outcome) => GateReason | null>([
       ),
   ],
   ['data-mismatch', (r) => fired(r.candidate.diagnosis === 'data-mismatch', 'data-mismatch')],
-  ['validation-overfit', (r) => fired(r.candidate.components.overfit.present, 'validation-overfit')],
+  [
+    'validation-overfit',
+    (r) => fired(r.candidate.components.overfit.present, 'validation-overfit'),
+  ],
   ['none', () => null],
 ]);
 

@@ -12,7 +12,12 @@ import type {
   ReviewSettings,
   SliceChange,
 } from '../model/review.js';
-import { componentChanges, splitChanges, splitShortfalls, type ComponentChanges } from './changes.js';
+import {
+  componentChanges,
+  splitChanges,
+  splitShortfalls,
+  type ComponentChanges,
+} from './changes.js';
 import { applyGate } from './gate.js';
 import { diffHyperparameters, pulledLevers } from './hyperparameters.js';
 import { chooseLevers } from './levers/choose.js';

@@ -12,7 +12,10 @@ const OUTCOME_SENTENCE: Words<FailOn> = new Map<FailOn, string>([
   ['high-bias', 'the candidate has high bias'],
   ['high-variance', 'the candidate has high variance'],
   ['data-mismatch', 'the candidate shows data mismatch'],
-  ['validation-overfit', 'the candidate overfits the validation set (test error well above validation)'],
+  [
+    'validation-overfit',
+    'the candidate overfits the validation set (test error well above validation)',
+  ],
 ]);
 
 function reasonSentence(reason: GateReason, review: Review, esc: Escape): string {

@@ -54,7 +54,11 @@ function changePhrase(
   return `${name} ${word} (${stats})`;
 }
 
-const GOOD_MOVEMENTS = new Set(['better-on-both', 'away-from-overfitting', 'away-from-underfitting']);
+const GOOD_MOVEMENTS = new Set([
+  'better-on-both',
+  'away-from-overfitting',
+  'away-from-underfitting',
+]);
 
 export function buildHeadline(review: Review, esc: Escape): Headline {
   const f = numberFormatFor(review);
@@ -100,7 +104,8 @@ export function buildHeadline(review: Review, esc: Escape): Headline {
     },
   ];
   const first = review.levers[0];
-  if (first === undefined) lines.push({ label: 'Next lever', text: 'none suggested.', tone: 'neutral' });
+  if (first === undefined)
+    lines.push({ label: 'Next lever', text: 'none suggested.', tone: 'neutral' });
   else {
     const text = leverText(first, review, f, esc);
     lines.push({

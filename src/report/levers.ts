@@ -4,7 +4,17 @@
  */
 import type { Lever, LeverEvidence, LeverId, Review, Suggestion } from '../model/review.js';
 import type { Escape } from './escape.js';
-import { amount, change, count, fixed, pText, short, value, valueRange, type NumberFormat } from './format.js';
+import {
+  amount,
+  change,
+  count,
+  fixed,
+  pText,
+  short,
+  value,
+  valueRange,
+  type NumberFormat,
+} from './format.js';
 import { COMPONENT_TITLE, COMPONENT_WORD, LEVER_TITLE, say } from './words.js';
 
 export interface LeverText {
@@ -44,9 +54,14 @@ function evidenceSentence(e: LeverEvidence, id: LeverId, ctx: Context): string |
     case 'pr-change':
       return `This PR ${e.direction === 'raised' ? 'raised' : 'lowered'} ${esc(e.hyperparameter, 60)} ${fromTo(e)}.`;
     case 'component-change': {
-      const word = e.delta.call === 'up' ? 'rose' : e.delta.call === 'down' ? 'fell' : 'held steady';
+      const word =
+        e.delta.call === 'up' ? 'rose' : e.delta.call === 'down' ? 'fell' : 'held steady';
       const toward =
-        e.delta.call !== 'up' ? '' : e.component === 'bias' ? ': the model moved toward underfitting' : ': the model moved toward overfitting';
+        e.delta.call !== 'up'
+          ? ''
+          : e.component === 'bias'
+            ? ': the model moved toward underfitting'
+            : ': the model moved toward overfitting';
       return `${say(COMPONENT_TITLE, e.component, esc)} ${word} (${change(e.delta.estimate, f)}, ${pText(e.delta.p)})${toward}.`;
     }
     case 'already-pulled':

@@ -70,7 +70,10 @@ export function renderText(review: Review, options: TextOptions): string {
   const splits = splitsTable(review, esc);
   const fitted = naturalWidth(splits) > width ? withoutColumn(splits, 'Reading') : splits;
   out.push('', heading('Splits'), ...textTable(fitted, width), '');
-  out.push(heading('Error decomposition'), ...textTable(decompositionTable(review, esc, true), width));
+  out.push(
+    heading('Error decomposition'),
+    ...textTable(decompositionTable(review, esc, true), width),
+  );
   for (const n of ['* present: large enough to count.', diagnosisLine(review, esc)])
     out.push(...wrap(n, width, '    ', '  '));
   for (const m of unavailableNotes(review, esc)) out.push(...wrap(m, width, '    ', '  - '));

@@ -80,7 +80,12 @@ export const COMPONENT_WORD = words<ComponentName>({
   overfit: 'validation overfit',
 });
 
-export const COMPONENT_ORDER: readonly ComponentName[] = ['bias', 'variance', 'mismatch', 'overfit'];
+export const COMPONENT_ORDER: readonly ComponentName[] = [
+  'bias',
+  'variance',
+  'mismatch',
+  'overfit',
+];
 
 /** Split names in prose and tables (`train_dev` is only the artifact key). */
 export const SPLIT_WORD = words<SplitName>({

@@ -79,7 +79,7 @@ describe('renderText', () => {
       'Validation error exceeds train-dev error by 2.20 pts',
     );
     // One minus sign: U+2212 in every number, never a hyphen-minus before a digit.
-    expect(text).not.toMatch(/(^|[\s(\[])-\d/m);
+    expect(text).not.toMatch(/(^|[\s([])-\d/m);
   });
 });
 

@@ -119,7 +119,11 @@ function analyzeLearningCurve(
 ): LearningCurveEvidence | CurveSkipped {
   const m = points.map((p) => p.x);
   const e = points.map((p) => scale.toError(p.validation));
-  const tooFew = { skipped: 'too-few-points', points: m.length, needs: MIN_POWER_LAW_POINTS } as const;
+  const tooFew = {
+    skipped: 'too-few-points',
+    points: m.length,
+    needs: MIN_POWER_LAW_POINTS,
+  } as const;
   if (m.length < MIN_POWER_LAW_POINTS) return tooFew;
   const fit = fitPowerLaw(m, e, { lower: scale.lower, upper: scale.upper });
   if ('skipped' in fit) return { ...tooFew, skipped: 'fit-failed' };

@@ -54,15 +54,15 @@ export function curveEvidence(curves: CurvesReport): CurveEvidence {
 export class Drafts {
   readonly #byId = new Map<LeverId, Lever>();
 
-  add(
-    id: LeverId,
-    score: number,
-    evidence: LeverEvidence[],
-    suggestion?: Suggestion,
-  ): void {
+  add(id: LeverId, score: number, evidence: LeverEvidence[], suggestion?: Suggestion): void {
     const existing = this.#byId.get(id);
     if (existing !== undefined && existing.score >= score) return;
-    this.#byId.set(id, { id, score, ...(suggestion === undefined ? {} : { suggestion }), evidence });
+    this.#byId.set(id, {
+      id,
+      score,
+      ...(suggestion === undefined ? {} : { suggestion }),
+      evidence,
+    });
   }
 
   has(id: LeverId): boolean {

@@ -95,7 +95,10 @@ function sharpen(id: LeverId, draft: Draft, ctx: LeverContext, curves: CurveEvid
       draft.evidence.push({ kind: 'gap-trend', trend: 'closing' });
     }
   }
-  if ((id === 'stronger-regularization' || id === 'weaker-regularization') && curves.sweep !== null) {
+  if (
+    (id === 'stronger-regularization' || id === 'weaker-regularization') &&
+    curves.sweep !== null
+  ) {
     sharpenBySweep(id, draft, ctx, curves.sweep);
   }
   const epochs = curves.epochs;

@@ -37,7 +37,11 @@ export function numericChange(p: PulledLever): {
 export function ownChangeLevers(ctx: LeverContext, curves: CurveEvidence, drafts: Drafts): void {
   const towardBias = ctx.movement === 'toward-underfitting' || ctx.movement === 'worse-on-both';
   const towardVariance = ctx.movement === 'toward-overfitting' || ctx.movement === 'worse-on-both';
-  const biasChange: LeverEvidence = { kind: 'component-change', component: 'bias', delta: ctx.bias };
+  const biasChange: LeverEvidence = {
+    kind: 'component-change',
+    component: 'bias',
+    delta: ctx.bias,
+  };
   const varianceChange: LeverEvidence = {
     kind: 'component-change',
     component: 'variance',
@@ -47,7 +51,11 @@ export function ownChangeLevers(ctx: LeverContext, curves: CurveEvidence, drafts
     const { baseline: from, candidate: to, key } = p.change;
     if (typeof from !== 'number' || typeof to !== 'number') continue;
     const change: LeverEvidence = { kind: 'pr-change', ...numericChange(p) };
-    const midway = { hyperparameter: key, value: between(from, to), basis: 'between-old-and-new' } as const;
+    const midway = {
+      hyperparameter: key,
+      value: between(from, to),
+      basis: 'between-old-and-new',
+    } as const;
     if (p.lever === 'stronger-regularization' && towardBias) {
       drafts.add('weaker-regularization', REVERSE_OWN_CHANGE, [change, biasChange], midway);
     }
