@@ -10,6 +10,7 @@ import type {
   PairedPredictions,
   Review,
   ReviewSettings,
+  ShortfallDelta,
   SliceChange,
 } from '../model/review.js';
 import {
@@ -47,19 +48,32 @@ function failOnOf(values: readonly string[]): FailOn[] {
   });
 }
 
+/** The settings as the review records them, with `failOn` checked. */
+function reviewSettings(input: ReviewInput['settings']): ReviewSettings {
+  return {
+    alpha: input.alpha,
+    minEffect: input.minEffect,
+    gapTolerance: input.gapTolerance,
+    failOn: failOnOf(input.failOn),
+  };
+}
+
+/** No bias change could be measured: a flat change with unknown noise stands in for the levers. */
+const NO_BIAS_CHANGE: ShortfallDelta = {
+  unit: 'shortfall',
+  estimate: 0,
+  ci: null,
+  p: null,
+  test: 'none',
+  call: 'flat',
+};
+
 export function buildReview(input: ReviewInput): Review {
   const { baseline, candidate } = input;
-  const settings: ReviewSettings = {
-    alpha: input.settings.alpha,
-    minEffect: input.settings.minEffect,
-    gapTolerance: input.settings.gapTolerance,
-    failOn: failOnOf(input.settings.failOn),
-  };
+  const settings = reviewSettings(input.settings);
   const calls: CallSettings = { alpha: settings.alpha, minEffect: settings.minEffect };
-  const summarySettings = {
-    ...settings,
-    ...(input.settings.reference === undefined ? {} : { reference: input.settings.reference }),
-  };
+  const reference = input.settings.reference;
+  const summarySettings = { ...settings, ...(reference === undefined ? {} : { reference }) };
   const base = summarize(baseline, summarySettings);
   const cand = summarize(candidate, summarySettings);
   const runs = { baseline, candidate };
@@ -87,14 +101,7 @@ export function buildReview(input: ReviewInput): Review {
     candidate: cand,
     baseline: base,
     movement,
-    bias: components.bias ?? {
-      unit: 'shortfall',
-      estimate: 0,
-      ci: null,
-      p: null,
-      test: 'none',
-      call: 'flat',
-    },
+    bias: components.bias ?? NO_BIAS_CHANGE,
     variance: components.variance,
     pulled: pulledLevers(changes),
     changes,
