@@ -125,3 +125,21 @@ describe('lever catalogue (common practice)', () => {
     expect(review.levers[0]?.id).not.toBe('stronger-regularization');
   });
 });
+
+describe('lever scores keep their bands (src/analysis/levers/scores.ts)', () => {
+  it('puts a reversal of the PR’s own change above every diagnosis lever, and evidence levers last', async () => {
+    const S = await import('../../src/analysis/levers/scores.js');
+    const bestDiagnosis =
+      S.DIAGNOSIS_BASE +
+      Math.max(S.GAP_CLOSING_BONUS, S.SWEEP_AGREES_BONUS, S.EPOCH_CONFIRMED_BONUS);
+    expect(S.REVERSE_OWN_CHANGE).toBeGreaterThan(S.COUNTER_WITH_SWEEP);
+    expect(S.COUNTER_WITH_SWEEP).toBeGreaterThan(S.STEP_BACK_CAPACITY);
+    expect(S.STEP_BACK_CAPACITY).toBeGreaterThan(S.COUNTER_WITHOUT_SWEEP);
+    expect(S.COUNTER_WITHOUT_SWEEP).toBeGreaterThan(bestDiagnosis);
+    expect(S.MISMATCH_DIAGNOSED).toBeGreaterThan(S.DIAGNOSIS_BASE);
+    // Within a target, the whole catalogue order is worth at most the smallest curve bonus.
+    expect(4 * S.CATALOGUE_STEP).toBeLessThanOrEqual(S.GAP_CLOSING_BONUS);
+    expect(S.SUPPLY_REFERENCE).toBeGreaterThan(S.ADD_REPEATS);
+    expect(S.ADD_REPEATS).toBeLessThan(S.EPOCH_CURVE_ALONE);
+  });
+});
