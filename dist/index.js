@@ -51326,19 +51326,28 @@ function failOnOf(values) {
     return value2;
   });
 }
+function reviewSettings(input) {
+  return {
+    alpha: input.alpha,
+    minEffect: input.minEffect,
+    gapTolerance: input.gapTolerance,
+    failOn: failOnOf(input.failOn)
+  };
+}
+var NO_BIAS_CHANGE = {
+  unit: "shortfall",
+  estimate: 0,
+  ci: null,
+  p: null,
+  test: "none",
+  call: "flat"
+};
 function buildReview(input) {
   const { baseline, candidate } = input;
-  const settings = {
-    alpha: input.settings.alpha,
-    minEffect: input.settings.minEffect,
-    gapTolerance: input.settings.gapTolerance,
-    failOn: failOnOf(input.settings.failOn)
-  };
+  const settings = reviewSettings(input.settings);
   const calls = { alpha: settings.alpha, minEffect: settings.minEffect };
-  const summarySettings = {
-    ...settings,
-    ...input.settings.reference === void 0 ? {} : { reference: input.settings.reference }
-  };
+  const reference = input.settings.reference;
+  const summarySettings = { ...settings, ...reference === void 0 ? {} : { reference } };
   const base = summarize(baseline, summarySettings);
   const cand = summarize(candidate, summarySettings);
   const runs = { baseline, candidate };
@@ -51364,14 +51373,7 @@ function buildReview(input) {
     candidate: cand,
     baseline: base,
     movement,
-    bias: components.bias ?? {
-      unit: "shortfall",
-      estimate: 0,
-      ci: null,
-      p: null,
-      test: "none",
-      call: "flat"
-    },
+    bias: components.bias ?? NO_BIAS_CHANGE,
     variance: components.variance,
     pulled: pulledLevers(changes),
     changes,
