@@ -84,10 +84,10 @@ var require_code = __commonJS({
       }
       get names() {
         var _a;
-        return (_a = this._names) !== null && _a !== void 0 ? _a : this._names = this._items.reduce((names, c) => {
+        return (_a = this._names) !== null && _a !== void 0 ? _a : this._names = this._items.reduce((names2, c) => {
           if (c instanceof Name)
-            names[c.str] = (names[c.str] || 0) + 1;
-          return names;
+            names2[c.str] = (names2[c.str] || 0) + 1;
+          return names2;
         }, {});
       }
     };
@@ -243,8 +243,8 @@ var require_scope = __commonJS({
         super(nameStr);
         this.prefix = prefix;
       }
-      setValue(value, { property, itemIndex }) {
-        this.value = value;
+      setValue(value2, { property, itemIndex }) {
+        this.value = value2;
         this.scopePath = (0, code_1._)`.${new code_1.Name(property)}[${itemIndex}]`;
       }
     };
@@ -263,13 +263,13 @@ var require_scope = __commonJS({
       name(prefix) {
         return new ValueScopeName(prefix, this._newName(prefix));
       }
-      value(nameOrPrefix, value) {
+      value(nameOrPrefix, value2) {
         var _a;
-        if (value.ref === void 0)
+        if (value2.ref === void 0)
           throw new Error("CodeGen: ref must be passed in value");
         const name = this.toName(nameOrPrefix);
         const { prefix } = name;
-        const valueKey = (_a = value.key) !== null && _a !== void 0 ? _a : value.ref;
+        const valueKey = (_a = value2.key) !== null && _a !== void 0 ? _a : value2.ref;
         let vs = this._values[prefix];
         if (vs) {
           const _name = vs.get(valueKey);
@@ -281,8 +281,8 @@ var require_scope = __commonJS({
         vs.set(valueKey, name);
         const s = this._scope[prefix] || (this._scope[prefix] = []);
         const itemIndex = s.length;
-        s[itemIndex] = value.ref;
-        name.setValue(value, { property: prefix, itemIndex });
+        s[itemIndex] = value2.ref;
+        name.setValue(value2, { property: prefix, itemIndex });
         return name;
       }
       getValue(prefix, keyOrRef) {
@@ -413,11 +413,11 @@ var require_codegen = __commonJS({
         const rhs = this.rhs === void 0 ? "" : ` = ${this.rhs}`;
         return `${varKind} ${this.name}${rhs};` + _n;
       }
-      optimizeNames(names, constants) {
-        if (!names[this.name.str])
+      optimizeNames(names2, constants) {
+        if (!names2[this.name.str])
           return;
         if (this.rhs)
-          this.rhs = optimizeExpr(this.rhs, names, constants);
+          this.rhs = optimizeExpr(this.rhs, names2, constants);
         return this;
       }
       get names() {
@@ -434,15 +434,15 @@ var require_codegen = __commonJS({
       render({ _n }) {
         return `${this.lhs} = ${this.rhs};` + _n;
       }
-      optimizeNames(names, constants) {
-        if (this.lhs instanceof code_1.Name && !names[this.lhs.str] && !this.sideEffects)
+      optimizeNames(names2, constants) {
+        if (this.lhs instanceof code_1.Name && !names2[this.lhs.str] && !this.sideEffects)
           return;
-        this.rhs = optimizeExpr(this.rhs, names, constants);
+        this.rhs = optimizeExpr(this.rhs, names2, constants);
         return this;
       }
       get names() {
-        const names = this.lhs instanceof code_1.Name ? {} : { ...this.lhs.names };
-        return addExprNames(names, this.rhs);
+        const names2 = this.lhs instanceof code_1.Name ? {} : { ...this.lhs.names };
+        return addExprNames(names2, this.rhs);
       }
     };
     var AssignOp = class extends Assign {
@@ -498,8 +498,8 @@ var require_codegen = __commonJS({
       optimizeNodes() {
         return `${this.code}` ? this : void 0;
       }
-      optimizeNames(names, constants) {
-        this.code = optimizeExpr(this.code, names, constants);
+      optimizeNames(names2, constants) {
+        this.code = optimizeExpr(this.code, names2, constants);
         return this;
       }
       get names() {
@@ -528,20 +528,20 @@ var require_codegen = __commonJS({
         }
         return nodes.length > 0 ? this : void 0;
       }
-      optimizeNames(names, constants) {
+      optimizeNames(names2, constants) {
         const { nodes } = this;
         let i = nodes.length;
         while (i--) {
           const n = nodes[i];
-          if (n.optimizeNames(names, constants))
+          if (n.optimizeNames(names2, constants))
             continue;
-          subtractNames(names, n.names);
+          subtractNames(names2, n.names);
           nodes.splice(i, 1);
         }
         return nodes.length > 0 ? this : void 0;
       }
       get names() {
-        return this.nodes.reduce((names, n) => addNames(names, n.names), {});
+        return this.nodes.reduce((names2, n) => addNames(names2, n.names), {});
       }
     };
     var BlockNode = class extends ParentNode {
@@ -586,20 +586,20 @@ var require_codegen = __commonJS({
           return void 0;
         return this;
       }
-      optimizeNames(names, constants) {
+      optimizeNames(names2, constants) {
         var _a;
-        this.else = (_a = this.else) === null || _a === void 0 ? void 0 : _a.optimizeNames(names, constants);
-        if (!(super.optimizeNames(names, constants) || this.else))
+        this.else = (_a = this.else) === null || _a === void 0 ? void 0 : _a.optimizeNames(names2, constants);
+        if (!(super.optimizeNames(names2, constants) || this.else))
           return;
-        this.condition = optimizeExpr(this.condition, names, constants);
+        this.condition = optimizeExpr(this.condition, names2, constants);
         return this;
       }
       get names() {
-        const names = super.names;
-        addExprNames(names, this.condition);
+        const names2 = super.names;
+        addExprNames(names2, this.condition);
         if (this.else)
-          addNames(names, this.else.names);
-        return names;
+          addNames(names2, this.else.names);
+        return names2;
       }
     };
     If.kind = "if";
@@ -614,10 +614,10 @@ var require_codegen = __commonJS({
       render(opts) {
         return `for(${this.iteration})` + super.render(opts);
       }
-      optimizeNames(names, constants) {
-        if (!super.optimizeNames(names, constants))
+      optimizeNames(names2, constants) {
+        if (!super.optimizeNames(names2, constants))
           return;
-        this.iteration = optimizeExpr(this.iteration, names, constants);
+        this.iteration = optimizeExpr(this.iteration, names2, constants);
         return this;
       }
       get names() {
@@ -638,8 +638,8 @@ var require_codegen = __commonJS({
         return `for(${varKind} ${name}=${from}; ${name}<${to}; ${name}++)` + super.render(opts);
       }
       get names() {
-        const names = addExprNames(super.names, this.from);
-        return addExprNames(names, this.to);
+        const names2 = addExprNames(super.names, this.from);
+        return addExprNames(names2, this.to);
       }
     };
     var ForIter = class extends For {
@@ -653,10 +653,10 @@ var require_codegen = __commonJS({
       render(opts) {
         return `for(${this.varKind} ${this.name} ${this.loop} ${this.iterable})` + super.render(opts);
       }
-      optimizeNames(names, constants) {
-        if (!super.optimizeNames(names, constants))
+      optimizeNames(names2, constants) {
+        if (!super.optimizeNames(names2, constants))
           return;
-        this.iterable = optimizeExpr(this.iterable, names, constants);
+        this.iterable = optimizeExpr(this.iterable, names2, constants);
         return this;
       }
       get names() {
@@ -698,20 +698,20 @@ var require_codegen = __commonJS({
         (_b = this.finally) === null || _b === void 0 ? void 0 : _b.optimizeNodes();
         return this;
       }
-      optimizeNames(names, constants) {
+      optimizeNames(names2, constants) {
         var _a, _b;
-        super.optimizeNames(names, constants);
-        (_a = this.catch) === null || _a === void 0 ? void 0 : _a.optimizeNames(names, constants);
-        (_b = this.finally) === null || _b === void 0 ? void 0 : _b.optimizeNames(names, constants);
+        super.optimizeNames(names2, constants);
+        (_a = this.catch) === null || _a === void 0 ? void 0 : _a.optimizeNames(names2, constants);
+        (_b = this.finally) === null || _b === void 0 ? void 0 : _b.optimizeNames(names2, constants);
         return this;
       }
       get names() {
-        const names = super.names;
+        const names2 = super.names;
         if (this.catch)
-          addNames(names, this.catch.names);
+          addNames(names2, this.catch.names);
         if (this.finally)
-          addNames(names, this.finally.names);
-        return names;
+          addNames(names2, this.finally.names);
+        return names2;
       }
     };
     var Catch = class extends BlockNode {
@@ -752,8 +752,8 @@ var require_codegen = __commonJS({
         return this._extScope.name(prefix);
       }
       // reserves unique name in the external scope and assigns value to it
-      scopeValue(prefixOrName, value) {
-        const name = this._extScope.value(prefixOrName, value);
+      scopeValue(prefixOrName, value2) {
+        const name = this._extScope.value(prefixOrName, value2);
         const vs = this._values[name.prefix] || (this._values[name.prefix] = /* @__PURE__ */ new Set());
         vs.add(name);
         return name;
@@ -807,13 +807,13 @@ var require_codegen = __commonJS({
       // returns code for object literal for the passed argument list of key-value pairs
       object(...keyValues) {
         const code = ["{"];
-        for (const [key, value] of keyValues) {
+        for (const [key, value2] of keyValues) {
           if (code.length > 1)
             code.push(",");
           code.push(key);
-          if (key !== value || this.opts.es5) {
+          if (key !== value2 || this.opts.es5) {
             code.push(":");
-            (0, code_1.addCodeArg)(code, value);
+            (0, code_1.addCodeArg)(code, value2);
           }
         }
         code.push("}");
@@ -892,10 +892,10 @@ var require_codegen = __commonJS({
         return this._leafNode(new Break(label));
       }
       // `return` statement
-      return(value) {
+      return(value2) {
         const node = new Return();
         this._blockNode(node);
-        this.code(value);
+        this.code(value2);
         if (node.nodes.length !== 1)
           throw new Error('CodeGen: "return" should have one node');
         return this._endBlockNode(Return);
@@ -995,15 +995,15 @@ var require_codegen = __commonJS({
       }
     };
     exports.CodeGen = CodeGen;
-    function addNames(names, from) {
+    function addNames(names2, from) {
       for (const n in from)
-        names[n] = (names[n] || 0) + (from[n] || 0);
-      return names;
+        names2[n] = (names2[n] || 0) + (from[n] || 0);
+      return names2;
     }
-    function addExprNames(names, from) {
-      return from instanceof code_1._CodeOrName ? addNames(names, from.names) : names;
+    function addExprNames(names2, from) {
+      return from instanceof code_1._CodeOrName ? addNames(names2, from.names) : names2;
     }
-    function optimizeExpr(expr, names, constants) {
+    function optimizeExpr(expr, names2, constants) {
       if (expr instanceof code_1.Name)
         return replaceName(expr);
       if (!canOptimize(expr))
@@ -1019,18 +1019,18 @@ var require_codegen = __commonJS({
       }, []));
       function replaceName(n) {
         const c = constants[n.str];
-        if (c === void 0 || names[n.str] !== 1)
+        if (c === void 0 || names2[n.str] !== 1)
           return n;
-        delete names[n.str];
+        delete names2[n.str];
         return c;
       }
       function canOptimize(e) {
-        return e instanceof code_1._Code && e._items.some((c) => c instanceof code_1.Name && names[c.str] === 1 && constants[c.str] !== void 0);
+        return e instanceof code_1._Code && e._items.some((c) => c instanceof code_1.Name && names2[c.str] === 1 && constants[c.str] !== void 0);
       }
     }
-    function subtractNames(names, from) {
+    function subtractNames(names2, from) {
       for (const n in from)
-        names[n] = (names[n] || 0) - (from[n] || 0);
+        names2[n] = (names2[n] || 0) - (from[n] || 0);
     }
     function not(x) {
       return typeof x == "boolean" || typeof x == "number" || x === null ? !x : (0, code_1._)`!${par(x)}`;
@@ -1228,7 +1228,7 @@ var require_names = __commonJS({
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var codegen_1 = require_codegen();
-    var names = {
+    var names2 = {
       // validation function arguments
       data: new codegen_1.Name("data"),
       // data passed to validation function
@@ -1257,7 +1257,7 @@ var require_names = __commonJS({
       jsonLen: new codegen_1.Name("jsonLen"),
       jsonPart: new codegen_1.Name("jsonPart")
     };
-    exports.default = names;
+    exports.default = names2;
   }
 });
 
@@ -4257,13 +4257,13 @@ var require_fast_uri = __commonJS({
       if (typeof uri !== "string" && typeof uri !== "object") {
         return void 0;
       }
-      let value;
+      let value2;
       try {
-        value = typeof uri === "string" ? uri : serialize2(uri, opts);
+        value2 = typeof uri === "string" ? uri : serialize2(uri, opts);
       } catch {
         return void 0;
       }
-      const { normalized, malformedAuthorityOrPort, malformedPercentEncoding, malformedSchemeSpecific, malformedHost, malformedScheme } = normalizeStringWithStatus(value, opts);
+      const { normalized, malformedAuthorityOrPort, malformedPercentEncoding, malformedSchemeSpecific, malformedHost, malformedScheme } = normalizeStringWithStatus(value2, opts);
       return malformedAuthorityOrPort || malformedPercentEncoding || malformedSchemeSpecific || malformedHost || malformedScheme ? void 0 : normalized;
     }
     var fastUri = {
@@ -5130,13 +5130,13 @@ var require_ucs2length = __commonJS({
       const len = str.length;
       let length = 0;
       let pos = 0;
-      let value;
+      let value2;
       while (pos < len) {
         length++;
-        value = str.charCodeAt(pos++);
-        if (value >= 55296 && value <= 56319 && pos < len) {
-          value = str.charCodeAt(pos);
-          if ((value & 64512) === 56320)
+        value2 = str.charCodeAt(pos++);
+        if (value2 >= 55296 && value2 <= 56319 && pos < len) {
+          value2 = str.charCodeAt(pos);
+          if ((value2 & 64512) === 56320)
             pos++;
         }
       }
@@ -7696,11 +7696,11 @@ var require_formats = __commonJS({
     }
     var MIN_INT32 = -(2 ** 31);
     var MAX_INT32 = 2 ** 31 - 1;
-    function validateInt32(value) {
-      return Number.isInteger(value) && value <= MAX_INT32 && value >= MIN_INT32;
+    function validateInt32(value2) {
+      return Number.isInteger(value2) && value2 <= MAX_INT32 && value2 >= MIN_INT32;
     }
-    function validateInt64(value) {
-      return Number.isInteger(value);
+    function validateInt64(value2) {
+      return Number.isInteger(value2);
     }
     function validateNumber() {
       return true;
@@ -8593,26 +8593,26 @@ var require_toJS = __commonJS({
   "node_modules/yaml/dist/nodes/toJS.js"(exports) {
     "use strict";
     var identity = require_identity();
-    function toJS(value, arg, ctx) {
-      if (Array.isArray(value))
-        return value.map((v, i) => toJS(v, String(i), ctx));
-      if (value && typeof value.toJSON === "function") {
-        if (!ctx || !identity.hasAnchor(value))
-          return value.toJSON(arg, ctx);
+    function toJS(value2, arg, ctx) {
+      if (Array.isArray(value2))
+        return value2.map((v, i) => toJS(v, String(i), ctx));
+      if (value2 && typeof value2.toJSON === "function") {
+        if (!ctx || !identity.hasAnchor(value2))
+          return value2.toJSON(arg, ctx);
         const data = { aliasCount: 0, count: 1, res: void 0 };
-        ctx.anchors.set(value, data);
+        ctx.anchors.set(value2, data);
         ctx.onCreate = (res2) => {
           data.res = res2;
           delete ctx.onCreate;
         };
-        const res = value.toJSON(arg, ctx);
+        const res = value2.toJSON(arg, ctx);
         if (ctx.onCreate)
           ctx.onCreate(res);
         return res;
       }
-      if (typeof value === "bigint" && !ctx?.keep)
-        return Number(value);
-      return value;
+      if (typeof value2 === "bigint" && !ctx?.keep)
+        return Number(value2);
+      return value2;
     }
     exports.toJS = toJS;
   }
@@ -8784,11 +8784,11 @@ var require_Scalar = __commonJS({
     var identity = require_identity();
     var Node = require_Node();
     var toJS = require_toJS();
-    var isScalarValue = (value) => !value || typeof value !== "function" && typeof value !== "object";
+    var isScalarValue = (value2) => !value2 || typeof value2 !== "function" && typeof value2 !== "object";
     var Scalar = class extends Node.NodeBase {
-      constructor(value) {
+      constructor(value2) {
         super(identity.SCALAR);
-        this.value = value;
+        this.value = value2;
       }
       toJSON(arg, ctx) {
         return ctx?.keep ? this.value : toJS.toJS(this.value, arg, ctx);
@@ -8815,7 +8815,7 @@ var require_createNode = __commonJS({
     var identity = require_identity();
     var Scalar = require_Scalar();
     var defaultTagPrefix = "tag:yaml.org,2002:";
-    function findTagObject(value, tagName, tags) {
+    function findTagObject(value2, tagName, tags) {
       if (tagName) {
         const match = tags.filter((t) => t.tag === tagName);
         const tagObj = match.find((t) => !t.format) ?? match[0];
@@ -8823,53 +8823,53 @@ var require_createNode = __commonJS({
           throw new Error(`Tag ${tagName} not found`);
         return tagObj;
       }
-      return tags.find((t) => t.identify?.(value) && !t.format);
+      return tags.find((t) => t.identify?.(value2) && !t.format);
     }
-    function createNode(value, tagName, ctx) {
-      if (identity.isDocument(value))
-        value = value.contents;
-      if (identity.isNode(value))
-        return value;
-      if (identity.isPair(value)) {
+    function createNode(value2, tagName, ctx) {
+      if (identity.isDocument(value2))
+        value2 = value2.contents;
+      if (identity.isNode(value2))
+        return value2;
+      if (identity.isPair(value2)) {
         const map = ctx.schema[identity.MAP].createNode?.(ctx.schema, null, ctx);
-        map.items.push(value);
+        map.items.push(value2);
         return map;
       }
-      if (value instanceof String || value instanceof Number || value instanceof Boolean || typeof BigInt !== "undefined" && value instanceof BigInt) {
-        value = value.valueOf();
+      if (value2 instanceof String || value2 instanceof Number || value2 instanceof Boolean || typeof BigInt !== "undefined" && value2 instanceof BigInt) {
+        value2 = value2.valueOf();
       }
       const { aliasDuplicateObjects, onAnchor, onTagObj, schema, sourceObjects } = ctx;
       let ref = void 0;
-      if (aliasDuplicateObjects && value && typeof value === "object") {
-        ref = sourceObjects.get(value);
+      if (aliasDuplicateObjects && value2 && typeof value2 === "object") {
+        ref = sourceObjects.get(value2);
         if (ref) {
-          ref.anchor ?? (ref.anchor = onAnchor(value));
+          ref.anchor ?? (ref.anchor = onAnchor(value2));
           return new Alias.Alias(ref.anchor);
         } else {
           ref = { anchor: null, node: null };
-          sourceObjects.set(value, ref);
+          sourceObjects.set(value2, ref);
         }
       }
       if (tagName?.startsWith("!!"))
         tagName = defaultTagPrefix + tagName.slice(2);
-      let tagObj = findTagObject(value, tagName, schema.tags);
+      let tagObj = findTagObject(value2, tagName, schema.tags);
       if (!tagObj) {
-        if (value && typeof value.toJSON === "function") {
-          value = value.toJSON();
+        if (value2 && typeof value2.toJSON === "function") {
+          value2 = value2.toJSON();
         }
-        if (!value || typeof value !== "object") {
-          const node2 = new Scalar.Scalar(value);
+        if (!value2 || typeof value2 !== "object") {
+          const node2 = new Scalar.Scalar(value2);
           if (ref)
             ref.node = node2;
           return node2;
         }
-        tagObj = value instanceof Map ? schema[identity.MAP] : Symbol.iterator in Object(value) ? schema[identity.SEQ] : schema[identity.MAP];
+        tagObj = value2 instanceof Map ? schema[identity.MAP] : Symbol.iterator in Object(value2) ? schema[identity.SEQ] : schema[identity.MAP];
       }
       if (onTagObj) {
         onTagObj(tagObj);
         delete ctx.onTagObj;
       }
-      const node = tagObj?.createNode ? tagObj.createNode(ctx.schema, value, ctx) : typeof tagObj?.nodeClass?.from === "function" ? tagObj.nodeClass.from(ctx.schema, value, ctx) : new Scalar.Scalar(value);
+      const node = tagObj?.createNode ? tagObj.createNode(ctx.schema, value2, ctx) : typeof tagObj?.nodeClass?.from === "function" ? tagObj.nodeClass.from(ctx.schema, value2, ctx) : new Scalar.Scalar(value2);
       if (tagName)
         node.tag = tagName;
       else if (!tagObj.default)
@@ -8889,8 +8889,8 @@ var require_Collection = __commonJS({
     var createNode = require_createNode();
     var identity = require_identity();
     var Node = require_Node();
-    function collectionFromPath(schema, path, value) {
-      let v = value;
+    function collectionFromPath(schema, path, value2) {
+      let v = value2;
       for (let i = path.length - 1; i >= 0; --i) {
         const k = path[i];
         if (typeof k === "number" && Number.isInteger(k) && k >= 0) {
@@ -8941,16 +8941,16 @@ var require_Collection = __commonJS({
        * be a Pair instance or a `{ key, value }` object, which may not have a key
        * that already exists in the map.
        */
-      addIn(path, value) {
+      addIn(path, value2) {
         if (isEmptyPath(path))
-          this.add(value);
+          this.add(value2);
         else {
           const [key, ...rest] = path;
           const node = this.get(key, true);
           if (identity.isCollection(node))
-            node.addIn(rest, value);
+            node.addIn(rest, value2);
           else if (node === void 0 && this.schema)
-            this.set(key, collectionFromPath(this.schema, rest, value));
+            this.set(key, collectionFromPath(this.schema, rest, value2));
           else
             throw new Error(`Expected YAML collection at ${key}. Remaining path: ${rest}`);
         }
@@ -9004,16 +9004,16 @@ var require_Collection = __commonJS({
        * Sets a value in this collection. For `!!set`, `value` needs to be a
        * boolean to add/remove the item from the set.
        */
-      setIn(path, value) {
+      setIn(path, value2) {
         const [key, ...rest] = path;
         if (rest.length === 0) {
-          this.set(key, value);
+          this.set(key, value2);
         } else {
           const node = this.get(key, true);
           if (identity.isCollection(node))
-            node.setIn(rest, value);
+            node.setIn(rest, value2);
           else if (node === void 0 && this.schema)
-            this.set(key, collectionFromPath(this.schema, rest, value));
+            this.set(key, collectionFromPath(this.schema, rest, value2));
           else
             throw new Error(`Expected YAML collection at ${key}. Remaining path: ${rest}`);
         }
@@ -9208,13 +9208,13 @@ var require_stringifyString = __commonJS({
       }
       return true;
     }
-    function doubleQuotedString(value, ctx) {
-      const json = JSON.stringify(value);
+    function doubleQuotedString(value2, ctx) {
+      const json = JSON.stringify(value2);
       if (ctx.options.doubleQuotedAsJSON)
         return json;
       const { implicitKey } = ctx;
       const minMultiLineLength = ctx.options.doubleQuotedMinMultiLineLength;
-      const indent = ctx.indent || (containsDocumentMarker(value) ? "  " : "");
+      const indent = ctx.indent || (containsDocumentMarker(value2) ? "  " : "");
       let str = "";
       let start = 0;
       for (let i = 0, ch = json[i]; ch; ch = json[++i]) {
@@ -9288,22 +9288,22 @@ var require_stringifyString = __commonJS({
       str = start ? str + json.slice(start) : json;
       return implicitKey ? str : foldFlowLines.foldFlowLines(str, indent, foldFlowLines.FOLD_QUOTED, getFoldOptions(ctx, false));
     }
-    function singleQuotedString(value, ctx) {
-      if (ctx.options.singleQuote === false || ctx.implicitKey && value.includes("\n") || /[ \t]\n|\n[ \t]/.test(value))
-        return doubleQuotedString(value, ctx);
-      const indent = ctx.indent || (containsDocumentMarker(value) ? "  " : "");
-      const res = "'" + value.replace(/'/g, "''").replace(/\n+/g, `$&
+    function singleQuotedString(value2, ctx) {
+      if (ctx.options.singleQuote === false || ctx.implicitKey && value2.includes("\n") || /[ \t]\n|\n[ \t]/.test(value2))
+        return doubleQuotedString(value2, ctx);
+      const indent = ctx.indent || (containsDocumentMarker(value2) ? "  " : "");
+      const res = "'" + value2.replace(/'/g, "''").replace(/\n+/g, `$&
 ${indent}`) + "'";
       return ctx.implicitKey ? res : foldFlowLines.foldFlowLines(res, indent, foldFlowLines.FOLD_FLOW, getFoldOptions(ctx, false));
     }
-    function quotedString(value, ctx) {
+    function quotedString(value2, ctx) {
       const { singleQuote } = ctx.options;
       let qs;
       if (singleQuote === false)
         qs = doubleQuotedString;
       else {
-        const hasDouble = value.includes('"');
-        const hasSingle = value.includes("'");
+        const hasDouble = value2.includes('"');
+        const hasSingle = value2.includes("'");
         if (hasDouble && !hasSingle)
           qs = singleQuotedString;
         else if (hasSingle && !hasDouble)
@@ -9311,7 +9311,7 @@ ${indent}`) + "'";
         else
           qs = singleQuote ? singleQuotedString : doubleQuotedString;
       }
-      return qs(value, ctx);
+      return qs(value2, ctx);
     }
     var blockEndNewlines;
     try {
@@ -9319,27 +9319,27 @@ ${indent}`) + "'";
     } catch {
       blockEndNewlines = /\n+(?!\n|$)/g;
     }
-    function blockString({ comment, type, value }, ctx, onComment, onChompKeep) {
+    function blockString({ comment, type, value: value2 }, ctx, onComment, onChompKeep) {
       const { blockQuote, commentString, lineWidth } = ctx.options;
-      if (!blockQuote || /\n[\t ]+$/.test(value)) {
-        return quotedString(value, ctx);
+      if (!blockQuote || /\n[\t ]+$/.test(value2)) {
+        return quotedString(value2, ctx);
       }
-      const indent = ctx.indent || (ctx.forceBlockIndent || containsDocumentMarker(value) ? "  " : "");
-      const literal = blockQuote === "literal" ? true : blockQuote === "folded" || type === Scalar.Scalar.BLOCK_FOLDED ? false : type === Scalar.Scalar.BLOCK_LITERAL ? true : !lineLengthOverLimit(value, lineWidth, indent.length);
-      if (!value)
+      const indent = ctx.indent || (ctx.forceBlockIndent || containsDocumentMarker(value2) ? "  " : "");
+      const literal = blockQuote === "literal" ? true : blockQuote === "folded" || type === Scalar.Scalar.BLOCK_FOLDED ? false : type === Scalar.Scalar.BLOCK_LITERAL ? true : !lineLengthOverLimit(value2, lineWidth, indent.length);
+      if (!value2)
         return literal ? "|\n" : ">\n";
       let chomp;
       let endStart;
-      for (endStart = value.length; endStart > 0; --endStart) {
-        const ch = value[endStart - 1];
+      for (endStart = value2.length; endStart > 0; --endStart) {
+        const ch = value2[endStart - 1];
         if (ch !== "\n" && ch !== "	" && ch !== " ")
           break;
       }
-      let end = value.substring(endStart);
+      let end = value2.substring(endStart);
       const endNlPos = end.indexOf("\n");
       if (endNlPos === -1) {
         chomp = "-";
-      } else if (value === end || endNlPos !== end.length - 1) {
+      } else if (value2 === end || endNlPos !== end.length - 1) {
         chomp = "+";
         if (onChompKeep)
           onChompKeep();
@@ -9347,7 +9347,7 @@ ${indent}`) + "'";
         chomp = "";
       }
       if (end) {
-        value = value.slice(0, -end.length);
+        value2 = value2.slice(0, -end.length);
         if (end[end.length - 1] === "\n")
           end = end.slice(0, -1);
         end = end.replace(blockEndNewlines, `$&${indent}`);
@@ -9355,8 +9355,8 @@ ${indent}`) + "'";
       let startWithSpace = false;
       let startEnd;
       let startNlPos = -1;
-      for (startEnd = 0; startEnd < value.length; ++startEnd) {
-        const ch = value[startEnd];
+      for (startEnd = 0; startEnd < value2.length; ++startEnd) {
+        const ch = value2[startEnd];
         if (ch === " ")
           startWithSpace = true;
         else if (ch === "\n")
@@ -9364,9 +9364,9 @@ ${indent}`) + "'";
         else
           break;
       }
-      let start = value.substring(0, startNlPos < startEnd ? startNlPos + 1 : startEnd);
+      let start = value2.substring(0, startNlPos < startEnd ? startNlPos + 1 : startEnd);
       if (start) {
-        value = value.substring(start.length);
+        value2 = value2.substring(start.length);
         start = start.replace(/\n+/g, `$&${indent}`);
       }
       const indentSize = indent ? "2" : "1";
@@ -9377,7 +9377,7 @@ ${indent}`) + "'";
           onComment();
       }
       if (!literal) {
-        const foldedValue = value.replace(/\n+/g, "\n$&").replace(/(?:^|\n)([\t ].*)(?:([\n\t ]*)\n(?![\n\t ]))?/g, "$1$2").replace(/\n+/g, `$&${indent}`);
+        const foldedValue = value2.replace(/\n+/g, "\n$&").replace(/(?:^|\n)([\t ].*)(?:([\n\t ]*)\n(?![\n\t ]))?/g, "$1$2").replace(/\n+/g, `$&${indent}`);
         let literalFallback = false;
         const foldOptions = getFoldOptions(ctx, true);
         if (blockQuote !== "folded" && type !== Scalar.Scalar.BLOCK_FOLDED) {
@@ -9390,37 +9390,37 @@ ${indent}`) + "'";
           return `>${header}
 ${indent}${body}`;
       }
-      value = value.replace(/\n+/g, `$&${indent}`);
+      value2 = value2.replace(/\n+/g, `$&${indent}`);
       return `|${header}
-${indent}${start}${value}${end}`;
+${indent}${start}${value2}${end}`;
     }
     function plainString(item, ctx, onComment, onChompKeep) {
-      const { type, value } = item;
+      const { type, value: value2 } = item;
       const { actualString, implicitKey, indent, indentStep, inFlow } = ctx;
-      if (implicitKey && value.includes("\n") || inFlow && /[[\]{},]/.test(value)) {
-        return quotedString(value, ctx);
+      if (implicitKey && value2.includes("\n") || inFlow && /[[\]{},]/.test(value2)) {
+        return quotedString(value2, ctx);
       }
-      if (/^[\n\t ,[\]{}#&*!|>'"%@`]|^[?-]$|^[?-][ \t]|[\n:][ \t]|[ \t]\n|[\n\t ]#|[\n\t :]$/.test(value)) {
-        return implicitKey || inFlow || !value.includes("\n") ? quotedString(value, ctx) : blockString(item, ctx, onComment, onChompKeep);
+      if (/^[\n\t ,[\]{}#&*!|>'"%@`]|^[?-]$|^[?-][ \t]|[\n:][ \t]|[ \t]\n|[\n\t ]#|[\n\t :]$/.test(value2)) {
+        return implicitKey || inFlow || !value2.includes("\n") ? quotedString(value2, ctx) : blockString(item, ctx, onComment, onChompKeep);
       }
-      if (!implicitKey && !inFlow && type !== Scalar.Scalar.PLAIN && value.includes("\n")) {
+      if (!implicitKey && !inFlow && type !== Scalar.Scalar.PLAIN && value2.includes("\n")) {
         return blockString(item, ctx, onComment, onChompKeep);
       }
-      if (containsDocumentMarker(value)) {
+      if (containsDocumentMarker(value2)) {
         if (indent === "") {
           ctx.forceBlockIndent = true;
           return blockString(item, ctx, onComment, onChompKeep);
         } else if (implicitKey && indent === indentStep) {
-          return quotedString(value, ctx);
+          return quotedString(value2, ctx);
         }
       }
-      const str = value.replace(/\n+/g, `$&
+      const str = value2.replace(/\n+/g, `$&
 ${indent}`);
       if (actualString) {
         const test = (tag) => tag.default && tag.tag !== "tag:yaml.org,2002:str" && tag.test?.test(str);
         const { compat, tags } = ctx.doc.schema;
         if (tags.some(test) || compat?.some(test))
-          return quotedString(value, ctx);
+          return quotedString(value2, ctx);
       }
       return implicitKey ? str : foldFlowLines.foldFlowLines(str, indent, foldFlowLines.FOLD_FLOW, getFoldOptions(ctx, false));
     }
@@ -9593,7 +9593,7 @@ var require_stringifyPair = __commonJS({
     var Scalar = require_Scalar();
     var stringify = require_stringify();
     var stringifyComment = require_stringifyComment();
-    function stringifyPair({ key, value }, ctx, onComment, onChompKeep) {
+    function stringifyPair({ key, value: value2 }, ctx, onComment, onChompKeep) {
       const { allNullValues, doc, indent, indentStep, options: { commentString, indentSeq, simpleKeys } } = ctx;
       let keyComment = identity.isNode(key) && key.comment || null;
       if (simpleKeys) {
@@ -9605,7 +9605,7 @@ var require_stringifyPair = __commonJS({
           throw new Error(msg);
         }
       }
-      let explicitKey = !simpleKeys && (!key || keyComment && value == null && !ctx.inFlow || identity.isCollection(key) || (identity.isScalar(key) ? key.type === Scalar.Scalar.BLOCK_FOLDED || key.type === Scalar.Scalar.BLOCK_LITERAL : typeof key === "object"));
+      let explicitKey = !simpleKeys && (!key || keyComment && value2 == null && !ctx.inFlow || identity.isCollection(key) || (identity.isScalar(key) ? key.type === Scalar.Scalar.BLOCK_FOLDED || key.type === Scalar.Scalar.BLOCK_LITERAL : typeof key === "object"));
       ctx = Object.assign({}, ctx, {
         allNullValues: false,
         implicitKey: !explicitKey && (simpleKeys || !allNullValues),
@@ -9620,12 +9620,12 @@ var require_stringifyPair = __commonJS({
         explicitKey = true;
       }
       if (ctx.inFlow) {
-        if (allNullValues || value == null) {
+        if (allNullValues || value2 == null) {
           if (keyCommentDone && onComment)
             onComment();
           return str === "" ? "?" : explicitKey ? `? ${str}` : str;
         }
-      } else if (allNullValues && !simpleKeys || value == null && explicitKey) {
+      } else if (allNullValues && !simpleKeys || value2 == null && explicitKey) {
         str = `? ${str}`;
         if (keyComment && !keyCommentDone) {
           str += stringifyComment.lineComment(str, ctx.indent, commentString(keyComment));
@@ -9646,26 +9646,26 @@ ${indent}:`;
           str += stringifyComment.lineComment(str, ctx.indent, commentString(keyComment));
       }
       let vsb, vcb, valueComment;
-      if (identity.isNode(value)) {
-        vsb = !!value.spaceBefore;
-        vcb = value.commentBefore;
-        valueComment = value.comment;
+      if (identity.isNode(value2)) {
+        vsb = !!value2.spaceBefore;
+        vcb = value2.commentBefore;
+        valueComment = value2.comment;
       } else {
         vsb = false;
         vcb = null;
         valueComment = null;
-        if (value && typeof value === "object")
-          value = doc.createNode(value);
+        if (value2 && typeof value2 === "object")
+          value2 = doc.createNode(value2);
       }
       ctx.implicitKey = false;
-      if (!explicitKey && !keyComment && identity.isScalar(value))
+      if (!explicitKey && !keyComment && identity.isScalar(value2))
         ctx.indentAtStart = str.length + 1;
       chompKeep = false;
-      if (!indentSeq && indentStep.length >= 2 && !ctx.inFlow && !explicitKey && identity.isSeq(value) && !value.flow && !value.tag && !value.anchor) {
+      if (!indentSeq && indentStep.length >= 2 && !ctx.inFlow && !explicitKey && identity.isSeq(value2) && !value2.flow && !value2.tag && !value2.anchor) {
         ctx.indent = ctx.indent.substring(2);
       }
       let valueCommentDone = false;
-      const valueStr = stringify.stringify(value, ctx, () => valueCommentDone = true, () => chompKeep = true);
+      const valueStr = stringify.stringify(value2, ctx, () => valueCommentDone = true, () => chompKeep = true);
       let ws = " ";
       if (keyComment || vsb || vcb) {
         ws = vsb ? "\n" : "";
@@ -9681,11 +9681,11 @@ ${stringifyComment.indentComment(cs, ctx.indent)}`;
           ws += `
 ${ctx.indent}`;
         }
-      } else if (!explicitKey && identity.isCollection(value)) {
+      } else if (!explicitKey && identity.isCollection(value2)) {
         const vs0 = valueStr[0];
         const nl0 = valueStr.indexOf("\n");
         const hasNewline = nl0 !== -1;
-        const flow = ctx.inFlow ?? value.flow ?? value.items.length === 0;
+        const flow = ctx.inFlow ?? value2.flow ?? value2.items.length === 0;
         if (hasNewline || !flow) {
           let hasPropsLine = false;
           if (hasNewline && (vs0 === "&" || vs0 === "!")) {
@@ -9748,7 +9748,7 @@ var require_merge = __commonJS({
     var Scalar = require_Scalar();
     var MERGE_KEY = "<<";
     var merge = {
-      identify: (value) => value === MERGE_KEY || typeof value === "symbol" && value.description === MERGE_KEY,
+      identify: (value2) => value2 === MERGE_KEY || typeof value2 === "symbol" && value2.description === MERGE_KEY,
       default: "key",
       tag: "tag:yaml.org,2002:merge",
       test: /^<<$/,
@@ -9758,8 +9758,8 @@ var require_merge = __commonJS({
       stringify: () => MERGE_KEY
     };
     var isMergeKey = (ctx, key) => (merge.identify(key) || identity.isScalar(key) && (!key.type || key.type === Scalar.Scalar.PLAIN) && merge.identify(key.value)) && ctx?.doc.schema.tags.some((tag) => tag.tag === merge.tag && tag.default);
-    function addMergeToJSMap(ctx, map, value) {
-      const source = resolveAliasValue(ctx, value);
+    function addMergeToJSMap(ctx, map, value2) {
+      const source = resolveAliasValue(ctx, value2);
       if (identity.isSeq(source))
         for (const it of source.items)
           mergeValue(ctx, map, it);
@@ -9769,20 +9769,20 @@ var require_merge = __commonJS({
       else
         mergeValue(ctx, map, source);
     }
-    function mergeValue(ctx, map, value) {
-      const source = resolveAliasValue(ctx, value);
+    function mergeValue(ctx, map, value2) {
+      const source = resolveAliasValue(ctx, value2);
       if (!identity.isMap(source))
         throw new Error("Merge sources must be maps or map aliases");
       const srcMap = source.toJSON(null, ctx, Map);
-      for (const [key, value2] of srcMap) {
+      for (const [key, value3] of srcMap) {
         if (map instanceof Map) {
           if (!map.has(key))
-            map.set(key, value2);
+            map.set(key, value3);
         } else if (map instanceof Set) {
           map.add(key);
         } else if (!Object.prototype.hasOwnProperty.call(map, key)) {
           Object.defineProperty(map, key, {
-            value: value2,
+            value: value3,
             writable: true,
             enumerable: true,
             configurable: true
@@ -9791,8 +9791,8 @@ var require_merge = __commonJS({
       }
       return map;
     }
-    function resolveAliasValue(ctx, value) {
-      return ctx && identity.isAlias(value) ? value.resolve(ctx.doc, ctx) : value;
+    function resolveAliasValue(ctx, value2) {
+      return ctx && identity.isAlias(value2) ? value2.resolve(ctx.doc, ctx) : value2;
     }
     exports.addMergeToJSMap = addMergeToJSMap;
     exports.isMergeKey = isMergeKey;
@@ -9809,20 +9809,20 @@ var require_addPairToJSMap = __commonJS({
     var stringify = require_stringify();
     var identity = require_identity();
     var toJS = require_toJS();
-    function addPairToJSMap(ctx, map, { key, value }) {
+    function addPairToJSMap(ctx, map, { key, value: value2 }) {
       if (identity.isNode(key) && key.addToJSMap)
-        key.addToJSMap(ctx, map, value);
+        key.addToJSMap(ctx, map, value2);
       else if (merge.isMergeKey(ctx, key))
-        merge.addMergeToJSMap(ctx, map, value);
+        merge.addMergeToJSMap(ctx, map, value2);
       else {
         const jsKey = toJS.toJS(key, "", ctx);
         if (map instanceof Map) {
-          map.set(jsKey, toJS.toJS(value, jsKey, ctx));
+          map.set(jsKey, toJS.toJS(value2, jsKey, ctx));
         } else if (map instanceof Set) {
           map.add(jsKey);
         } else {
           const stringKey = stringifyKey(key, jsKey, ctx);
-          const jsValue = toJS.toJS(value, stringKey, ctx);
+          const jsValue = toJS.toJS(value2, stringKey, ctx);
           if (stringKey in map)
             Object.defineProperty(map, stringKey, {
               value: jsValue,
@@ -9872,24 +9872,24 @@ var require_Pair = __commonJS({
     var stringifyPair = require_stringifyPair();
     var addPairToJSMap = require_addPairToJSMap();
     var identity = require_identity();
-    function createPair(key, value, ctx) {
+    function createPair(key, value2, ctx) {
       const k = createNode.createNode(key, void 0, ctx);
-      const v = createNode.createNode(value, void 0, ctx);
+      const v = createNode.createNode(value2, void 0, ctx);
       return new Pair(k, v);
     }
     var Pair = class _Pair {
-      constructor(key, value = null) {
+      constructor(key, value2 = null) {
         Object.defineProperty(this, identity.NODE_TYPE, { value: identity.PAIR });
         this.key = key;
-        this.value = value;
+        this.value = value2;
       }
       clone(schema) {
-        let { key, value } = this;
+        let { key, value: value2 } = this;
         if (identity.isNode(key))
           key = key.clone(schema);
-        if (identity.isNode(value))
-          value = value.clone(schema);
-        return new _Pair(key, value);
+        if (identity.isNode(value2))
+          value2 = value2.clone(schema);
+        return new _Pair(key, value2);
       }
       toJSON(_, ctx) {
         const pair = ctx?.mapAsMap ? /* @__PURE__ */ new Map() : {};
@@ -10092,17 +10092,17 @@ var require_YAMLMap = __commonJS({
       static from(schema, obj, ctx) {
         const { keepUndefined, replacer } = ctx;
         const map = new this(schema);
-        const add2 = (key, value) => {
+        const add2 = (key, value2) => {
           if (typeof replacer === "function")
-            value = replacer.call(obj, key, value);
+            value2 = replacer.call(obj, key, value2);
           else if (Array.isArray(replacer) && !replacer.includes(key))
             return;
-          if (value !== void 0 || keepUndefined)
-            map.items.push(Pair.createPair(key, value, ctx));
+          if (value2 !== void 0 || keepUndefined)
+            map.items.push(Pair.createPair(key, value2, ctx));
         };
         if (obj instanceof Map) {
-          for (const [key, value] of obj)
-            add2(key, value);
+          for (const [key, value2] of obj)
+            add2(key, value2);
         } else if (obj && typeof obj === "object") {
           for (const key of Object.keys(obj))
             add2(key, obj[key]);
@@ -10160,8 +10160,8 @@ var require_YAMLMap = __commonJS({
       has(key) {
         return !!findPair(this.items, key);
       }
-      set(key, value) {
-        this.add(new Pair.Pair(key, value), true);
+      set(key, value2) {
+        this.add(new Pair.Pair(key, value2), true);
       }
       /**
        * @param ctx - Conversion context, originally set in Document#toJS()
@@ -10239,8 +10239,8 @@ var require_YAMLSeq = __commonJS({
         super(identity.SEQ, schema);
         this.items = [];
       }
-      add(value) {
-        this.items.push(value);
+      add(value2) {
+        this.items.push(value2);
       }
       /**
        * Removes a value from the collection.
@@ -10281,15 +10281,15 @@ var require_YAMLSeq = __commonJS({
        * If `key` does not contain a representation of an integer, this will throw.
        * It may be wrapped in a `Scalar`.
        */
-      set(key, value) {
+      set(key, value2) {
         const idx = asItemIndex(key);
         if (typeof idx !== "number")
           throw new Error(`Expected a valid index, not ${key}.`);
         const prev = this.items[idx];
-        if (identity.isScalar(prev) && Scalar.isScalarValue(value))
-          prev.value = value;
+        if (identity.isScalar(prev) && Scalar.isScalarValue(value2))
+          prev.value = value2;
         else
-          this.items[idx] = value;
+          this.items[idx] = value2;
       }
       toJSON(_, ctx) {
         const seq = [];
@@ -10365,7 +10365,7 @@ var require_string = __commonJS({
     "use strict";
     var stringifyString = require_stringifyString();
     var string = {
-      identify: (value) => typeof value === "string",
+      identify: (value2) => typeof value2 === "string",
       default: true,
       tag: "tag:yaml.org,2002:str",
       resolve: (str) => str,
@@ -10384,7 +10384,7 @@ var require_null = __commonJS({
     "use strict";
     var Scalar = require_Scalar();
     var nullTag = {
-      identify: (value) => value == null,
+      identify: (value2) => value2 == null,
       createNode: () => new Scalar.Scalar(null),
       default: true,
       tag: "tag:yaml.org,2002:null",
@@ -10402,18 +10402,18 @@ var require_bool = __commonJS({
     "use strict";
     var Scalar = require_Scalar();
     var boolTag = {
-      identify: (value) => typeof value === "boolean",
+      identify: (value2) => typeof value2 === "boolean",
       default: true,
       tag: "tag:yaml.org,2002:bool",
       test: /^(?:[Tt]rue|TRUE|[Ff]alse|FALSE)$/,
       resolve: (str) => new Scalar.Scalar(str[0] === "t" || str[0] === "T"),
-      stringify({ source, value }, ctx) {
+      stringify({ source, value: value2 }, ctx) {
         if (source && boolTag.test.test(source)) {
           const sv = source[0] === "t" || source[0] === "T";
-          if (value === sv)
+          if (value2 === sv)
             return source;
         }
-        return value ? ctx.options.trueStr : ctx.options.falseStr;
+        return value2 ? ctx.options.trueStr : ctx.options.falseStr;
       }
     };
     exports.boolTag = boolTag;
@@ -10424,13 +10424,13 @@ var require_bool = __commonJS({
 var require_stringifyNumber = __commonJS({
   "node_modules/yaml/dist/stringify/stringifyNumber.js"(exports) {
     "use strict";
-    function stringifyNumber({ format, minFractionDigits, tag, value }) {
-      if (typeof value === "bigint")
-        return String(value);
-      const num2 = typeof value === "number" ? value : Number(value);
-      if (!isFinite(num2))
-        return isNaN(num2) ? ".nan" : num2 < 0 ? "-.inf" : ".inf";
-      let n = Object.is(value, -0) ? "-0" : JSON.stringify(value);
+    function stringifyNumber({ format, minFractionDigits, tag, value: value2 }) {
+      if (typeof value2 === "bigint")
+        return String(value2);
+      const num = typeof value2 === "number" ? value2 : Number(value2);
+      if (!isFinite(num))
+        return isNaN(num) ? ".nan" : num < 0 ? "-.inf" : ".inf";
+      let n = Object.is(value2, -0) ? "-0" : JSON.stringify(value2);
       if (!format && minFractionDigits && (!tag || tag === "tag:yaml.org,2002:float") && /^-?\d/.test(n) && !n.includes("e")) {
         let i = n.indexOf(".");
         if (i < 0) {
@@ -10454,7 +10454,7 @@ var require_float = __commonJS({
     var Scalar = require_Scalar();
     var stringifyNumber = require_stringifyNumber();
     var floatNaN = {
-      identify: (value) => typeof value === "number",
+      identify: (value2) => typeof value2 === "number",
       default: true,
       tag: "tag:yaml.org,2002:float",
       test: /^(?:[-+]?\.(?:inf|Inf|INF)|\.nan|\.NaN|\.NAN)$/,
@@ -10462,19 +10462,19 @@ var require_float = __commonJS({
       stringify: stringifyNumber.stringifyNumber
     };
     var floatExp = {
-      identify: (value) => typeof value === "number",
+      identify: (value2) => typeof value2 === "number",
       default: true,
       tag: "tag:yaml.org,2002:float",
       format: "EXP",
       test: /^[-+]?(?:\.[0-9]+|[0-9]+(?:\.[0-9]*)?)[eE][-+]?[0-9]+$/,
       resolve: (str) => parseFloat(str),
       stringify(node) {
-        const num2 = Number(node.value);
-        return isFinite(num2) ? num2.toExponential() : stringifyNumber.stringifyNumber(node);
+        const num = Number(node.value);
+        return isFinite(num) ? num.toExponential() : stringifyNumber.stringifyNumber(node);
       }
     };
     var float = {
-      identify: (value) => typeof value === "number",
+      identify: (value2) => typeof value2 === "number",
       default: true,
       tag: "tag:yaml.org,2002:float",
       test: /^[-+]?(?:\.[0-9]+|[0-9]+\.[0-9]*)$/,
@@ -10498,16 +10498,16 @@ var require_int = __commonJS({
   "node_modules/yaml/dist/schema/core/int.js"(exports) {
     "use strict";
     var stringifyNumber = require_stringifyNumber();
-    var intIdentify = (value) => typeof value === "bigint" || Number.isInteger(value);
+    var intIdentify = (value2) => typeof value2 === "bigint" || Number.isInteger(value2);
     var intResolve = (str, offset, radix, { intAsBigInt }) => intAsBigInt ? BigInt(str) : parseInt(str.substring(offset), radix);
     function intStringify(node, radix, prefix) {
-      const { value } = node;
-      if (intIdentify(value) && value >= 0)
-        return prefix + value.toString(radix);
+      const { value: value2 } = node;
+      if (intIdentify(value2) && value2 >= 0)
+        return prefix + value2.toString(radix);
       return stringifyNumber.stringifyNumber(node);
     }
     var intOct = {
-      identify: (value) => intIdentify(value) && value >= 0,
+      identify: (value2) => intIdentify(value2) && value2 >= 0,
       default: true,
       tag: "tag:yaml.org,2002:int",
       format: "OCT",
@@ -10524,7 +10524,7 @@ var require_int = __commonJS({
       stringify: stringifyNumber.stringifyNumber
     };
     var intHex = {
-      identify: (value) => intIdentify(value) && value >= 0,
+      identify: (value2) => intIdentify(value2) && value2 >= 0,
       default: true,
       tag: "tag:yaml.org,2002:int",
       format: "HEX",
@@ -10573,20 +10573,20 @@ var require_schema3 = __commonJS({
     var Scalar = require_Scalar();
     var map = require_map();
     var seq = require_seq();
-    function intIdentify(value) {
-      return typeof value === "bigint" || Number.isInteger(value);
+    function intIdentify(value2) {
+      return typeof value2 === "bigint" || Number.isInteger(value2);
     }
-    var stringifyJSON = ({ value }) => JSON.stringify(value);
+    var stringifyJSON = ({ value: value2 }) => JSON.stringify(value2);
     var jsonScalars = [
       {
-        identify: (value) => typeof value === "string",
+        identify: (value2) => typeof value2 === "string",
         default: true,
         tag: "tag:yaml.org,2002:str",
         resolve: (str) => str,
         stringify: stringifyJSON
       },
       {
-        identify: (value) => value == null,
+        identify: (value2) => value2 == null,
         createNode: () => new Scalar.Scalar(null),
         default: true,
         tag: "tag:yaml.org,2002:null",
@@ -10595,7 +10595,7 @@ var require_schema3 = __commonJS({
         stringify: stringifyJSON
       },
       {
-        identify: (value) => typeof value === "boolean",
+        identify: (value2) => typeof value2 === "boolean",
         default: true,
         tag: "tag:yaml.org,2002:bool",
         test: /^true$|^false$/,
@@ -10608,10 +10608,10 @@ var require_schema3 = __commonJS({
         tag: "tag:yaml.org,2002:int",
         test: /^-?(?:0|[1-9][0-9]*)$/,
         resolve: (str, _onError, { intAsBigInt }) => intAsBigInt ? BigInt(str) : parseInt(str, 10),
-        stringify: ({ value }) => intIdentify(value) ? value.toString() : JSON.stringify(value)
+        stringify: ({ value: value2 }) => intIdentify(value2) ? value2.toString() : JSON.stringify(value2)
       },
       {
-        identify: (value) => typeof value === "number",
+        identify: (value2) => typeof value2 === "number",
         default: true,
         tag: "tag:yaml.org,2002:float",
         test: /^-?(?:0|[1-9][0-9]*)(?:\.[0-9]*)?(?:[eE][-+]?[0-9]+)?$/,
@@ -10641,7 +10641,7 @@ var require_binary = __commonJS({
     var Scalar = require_Scalar();
     var stringifyString = require_stringifyString();
     var binary = {
-      identify: (value) => value instanceof Uint8Array,
+      identify: (value2) => value2 instanceof Uint8Array,
       // Buffer inherits from Uint8Array
       default: false,
       tag: "tag:yaml.org,2002:binary",
@@ -10667,10 +10667,10 @@ var require_binary = __commonJS({
           return src;
         }
       },
-      stringify({ comment, type, value }, ctx, onComment, onChompKeep) {
-        if (!value)
+      stringify({ comment, type, value: value2 }, ctx, onComment, onChompKeep) {
+        if (!value2)
           return "";
-        const buf = value;
+        const buf = value2;
         let str;
         if (typeof node_buffer.Buffer === "function") {
           str = buf instanceof node_buffer.Buffer ? buf.toString("base64") : node_buffer.Buffer.from(buf.buffer).toString("base64");
@@ -10742,25 +10742,25 @@ ${cn.comment}` : item.comment;
         for (let it of iterable) {
           if (typeof replacer === "function")
             it = replacer.call(iterable, String(i++), it);
-          let key, value;
+          let key, value2;
           if (Array.isArray(it)) {
             if (it.length === 2) {
               key = it[0];
-              value = it[1];
+              value2 = it[1];
             } else
               throw new TypeError(`Expected [key, value] tuple: ${it}`);
           } else if (it && it instanceof Object) {
             const keys = Object.keys(it);
             if (keys.length === 1) {
               key = keys[0];
-              value = it[key];
+              value2 = it[key];
             } else {
               throw new TypeError(`Expected tuple with one key, not ${keys.length} keys`);
             }
           } else {
             key = it;
           }
-          pairs2.items.push(Pair.createPair(key, value, ctx));
+          pairs2.items.push(Pair.createPair(key, value2, ctx));
         }
       return pairs2;
     }
@@ -10807,16 +10807,16 @@ var require_omap = __commonJS({
         if (ctx?.onCreate)
           ctx.onCreate(map);
         for (const pair of this.items) {
-          let key, value;
+          let key, value2;
           if (identity.isPair(pair)) {
             key = toJS.toJS(pair.key, "", ctx);
-            value = toJS.toJS(pair.value, key, ctx);
+            value2 = toJS.toJS(pair.value, key, ctx);
           } else {
             key = toJS.toJS(pair, "", ctx);
           }
           if (map.has(key))
             throw new Error("Ordered maps must not include duplicate keys");
-          map.set(key, value);
+          map.set(key, value2);
         }
         return map;
       }
@@ -10830,7 +10830,7 @@ var require_omap = __commonJS({
     YAMLOMap.tag = "tag:yaml.org,2002:omap";
     var omap = {
       collection: "seq",
-      identify: (value) => value instanceof Map,
+      identify: (value2) => value2 instanceof Map,
       nodeClass: YAMLOMap,
       default: false,
       tag: "tag:yaml.org,2002:omap",
@@ -10860,14 +10860,14 @@ var require_bool2 = __commonJS({
   "node_modules/yaml/dist/schema/yaml-1.1/bool.js"(exports) {
     "use strict";
     var Scalar = require_Scalar();
-    function boolStringify({ value, source }, ctx) {
-      const boolObj = value ? trueTag : falseTag;
+    function boolStringify({ value: value2, source }, ctx) {
+      const boolObj = value2 ? trueTag : falseTag;
       if (source && boolObj.test.test(source))
         return source;
-      return value ? ctx.options.trueStr : ctx.options.falseStr;
+      return value2 ? ctx.options.trueStr : ctx.options.falseStr;
     }
     var trueTag = {
-      identify: (value) => value === true,
+      identify: (value2) => value2 === true,
       default: true,
       tag: "tag:yaml.org,2002:bool",
       test: /^(?:Y|y|[Yy]es|YES|[Tt]rue|TRUE|[Oo]n|ON)$/,
@@ -10875,7 +10875,7 @@ var require_bool2 = __commonJS({
       stringify: boolStringify
     };
     var falseTag = {
-      identify: (value) => value === false,
+      identify: (value2) => value2 === false,
       default: true,
       tag: "tag:yaml.org,2002:bool",
       test: /^(?:N|n|[Nn]o|NO|[Ff]alse|FALSE|[Oo]ff|OFF)$/,
@@ -10894,7 +10894,7 @@ var require_float2 = __commonJS({
     var Scalar = require_Scalar();
     var stringifyNumber = require_stringifyNumber();
     var floatNaN = {
-      identify: (value) => typeof value === "number",
+      identify: (value2) => typeof value2 === "number",
       default: true,
       tag: "tag:yaml.org,2002:float",
       test: /^(?:[-+]?\.(?:inf|Inf|INF)|\.nan|\.NaN|\.NAN)$/,
@@ -10902,19 +10902,19 @@ var require_float2 = __commonJS({
       stringify: stringifyNumber.stringifyNumber
     };
     var floatExp = {
-      identify: (value) => typeof value === "number",
+      identify: (value2) => typeof value2 === "number",
       default: true,
       tag: "tag:yaml.org,2002:float",
       format: "EXP",
       test: /^[-+]?(?:[0-9][0-9_]*)?(?:\.[0-9_]*)?[eE][-+]?[0-9]+$/,
       resolve: (str) => parseFloat(str.replace(/_/g, "")),
       stringify(node) {
-        const num2 = Number(node.value);
-        return isFinite(num2) ? num2.toExponential() : stringifyNumber.stringifyNumber(node);
+        const num = Number(node.value);
+        return isFinite(num) ? num.toExponential() : stringifyNumber.stringifyNumber(node);
       }
     };
     var float = {
-      identify: (value) => typeof value === "number",
+      identify: (value2) => typeof value2 === "number",
       default: true,
       tag: "tag:yaml.org,2002:float",
       test: /^[-+]?(?:[0-9][0-9_]*)?\.[0-9_]*$/,
@@ -10941,7 +10941,7 @@ var require_int2 = __commonJS({
   "node_modules/yaml/dist/schema/yaml-1.1/int.js"(exports) {
     "use strict";
     var stringifyNumber = require_stringifyNumber();
-    var intIdentify = (value) => typeof value === "bigint" || Number.isInteger(value);
+    var intIdentify = (value2) => typeof value2 === "bigint" || Number.isInteger(value2);
     function intResolve(str, offset, radix, { intAsBigInt }) {
       const sign = str[0];
       if (sign === "-" || sign === "+")
@@ -10966,10 +10966,10 @@ var require_int2 = __commonJS({
       return sign === "-" ? -1 * n : n;
     }
     function intStringify(node, radix, prefix) {
-      const { value } = node;
-      if (intIdentify(value)) {
-        const str = value.toString(radix);
-        return value < 0 ? "-" + prefix + str.substr(1) : prefix + str;
+      const { value: value2 } = node;
+      if (intIdentify(value2)) {
+        const str = value2.toString(radix);
+        return value2 < 0 ? "-" + prefix + str.substr(1) : prefix + str;
       }
       return stringifyNumber.stringifyNumber(node);
     }
@@ -11047,13 +11047,13 @@ var require_set = __commonJS({
         const pair = YAMLMap.findPair(this.items, key);
         return !keepPair && identity.isPair(pair) ? identity.isScalar(pair.key) ? pair.key.value : pair.key : pair;
       }
-      set(key, value) {
-        if (typeof value !== "boolean")
-          throw new Error(`Expected boolean value for set(key, value) in a YAML set, not ${typeof value}`);
+      set(key, value2) {
+        if (typeof value2 !== "boolean")
+          throw new Error(`Expected boolean value for set(key, value) in a YAML set, not ${typeof value2}`);
         const prev = YAMLMap.findPair(this.items, key);
-        if (prev && !value) {
+        if (prev && !value2) {
           this.items.splice(this.items.indexOf(prev), 1);
-        } else if (!prev && value) {
+        } else if (!prev && value2) {
           this.items.push(new Pair.Pair(key));
         }
       }
@@ -11072,10 +11072,10 @@ var require_set = __commonJS({
         const { replacer } = ctx;
         const set2 = new this(schema);
         if (iterable && Symbol.iterator in Object(iterable))
-          for (let value of iterable) {
+          for (let value2 of iterable) {
             if (typeof replacer === "function")
-              value = replacer.call(iterable, value, value);
-            set2.items.push(Pair.createPair(value, null, ctx));
+              value2 = replacer.call(iterable, value2, value2);
+            set2.items.push(Pair.createPair(value2, null, ctx));
           }
         return set2;
       }
@@ -11083,7 +11083,7 @@ var require_set = __commonJS({
     YAMLSet.tag = "tag:yaml.org,2002:set";
     var set = {
       collection: "map",
-      identify: (value) => value instanceof Set,
+      identify: (value2) => value2 instanceof Set,
       nodeClass: YAMLSet,
       default: false,
       tag: "tag:yaml.org,2002:set",
@@ -11112,38 +11112,38 @@ var require_timestamp = __commonJS({
     function parseSexagesimal(str, asBigInt) {
       const sign = str[0];
       const parts = sign === "-" || sign === "+" ? str.substring(1) : str;
-      const num2 = (n) => asBigInt ? BigInt(n) : Number(n);
-      const res = parts.replace(/_/g, "").split(":").reduce((res2, p) => res2 * num2(60) + num2(p), num2(0));
-      return sign === "-" ? num2(-1) * res : res;
+      const num = (n) => asBigInt ? BigInt(n) : Number(n);
+      const res = parts.replace(/_/g, "").split(":").reduce((res2, p) => res2 * num(60) + num(p), num(0));
+      return sign === "-" ? num(-1) * res : res;
     }
     function stringifySexagesimal(node) {
-      let { value } = node;
-      let num2 = (n) => n;
-      if (typeof value === "bigint")
-        num2 = (n) => BigInt(n);
-      else if (isNaN(value) || !isFinite(value))
+      let { value: value2 } = node;
+      let num = (n) => n;
+      if (typeof value2 === "bigint")
+        num = (n) => BigInt(n);
+      else if (isNaN(value2) || !isFinite(value2))
         return stringifyNumber.stringifyNumber(node);
       let sign = "";
-      if (value < 0) {
+      if (value2 < 0) {
         sign = "-";
-        value *= num2(-1);
+        value2 *= num(-1);
       }
-      const _60 = num2(60);
-      const parts = [value % _60];
-      if (value < 60) {
+      const _60 = num(60);
+      const parts = [value2 % _60];
+      if (value2 < 60) {
         parts.unshift(0);
       } else {
-        value = (value - parts[0]) / _60;
-        parts.unshift(value % _60);
-        if (value >= 60) {
-          value = (value - parts[0]) / _60;
-          parts.unshift(value);
+        value2 = (value2 - parts[0]) / _60;
+        parts.unshift(value2 % _60);
+        if (value2 >= 60) {
+          value2 = (value2 - parts[0]) / _60;
+          parts.unshift(value2);
         }
       }
       return sign + parts.map((n) => String(n).padStart(2, "0")).join(":").replace(/000000\d*$/, "");
     }
     var intTime = {
-      identify: (value) => typeof value === "bigint" || Number.isInteger(value),
+      identify: (value2) => typeof value2 === "bigint" || Number.isInteger(value2),
       default: true,
       tag: "tag:yaml.org,2002:int",
       format: "TIME",
@@ -11152,7 +11152,7 @@ var require_timestamp = __commonJS({
       stringify: stringifySexagesimal
     };
     var floatTime = {
-      identify: (value) => typeof value === "number",
+      identify: (value2) => typeof value2 === "number",
       default: true,
       tag: "tag:yaml.org,2002:float",
       format: "TIME",
@@ -11161,7 +11161,7 @@ var require_timestamp = __commonJS({
       stringify: stringifySexagesimal
     };
     var timestamp = {
-      identify: (value) => value instanceof Date,
+      identify: (value2) => value2 instanceof Date,
       default: true,
       tag: "tag:yaml.org,2002:timestamp",
       // If the time zone is omitted, the timestamp is assumed to be specified in UTC. The time part
@@ -11184,7 +11184,7 @@ var require_timestamp = __commonJS({
         }
         return new Date(date);
       },
-      stringify: ({ value }) => value?.toISOString().replace(/(T00:00:00)?\.000Z$/, "") ?? ""
+      stringify: ({ value: value2 }) => value2?.toISOString().replace(/(T00:00:00)?\.000Z$/, "") ?? ""
     };
     exports.floatTime = floatTime;
     exports.intTime = intTime;
@@ -11458,7 +11458,7 @@ var require_Document = __commonJS({
     var createNode = require_createNode();
     var directives = require_directives();
     var Document = class _Document {
-      constructor(value, replacer, options) {
+      constructor(value2, replacer, options) {
         this.commentBefore = null;
         this.comment = null;
         this.errors = [];
@@ -11490,7 +11490,7 @@ var require_Document = __commonJS({
         } else
           this.directives = new directives.Directives({ version: version2 });
         this.setSchema(version2, options);
-        this.contents = value === void 0 ? null : this.createNode(value, _replacer, options);
+        this.contents = value2 === void 0 ? null : this.createNode(value2, _replacer, options);
       }
       /**
        * Create a deep copy of this Document and its contents.
@@ -11515,14 +11515,14 @@ var require_Document = __commonJS({
         return copy;
       }
       /** Adds a value to the document. */
-      add(value) {
+      add(value2) {
         if (assertCollection(this.contents))
-          this.contents.add(value);
+          this.contents.add(value2);
       }
       /** Adds a value to the document. */
-      addIn(path, value) {
+      addIn(path, value2) {
         if (assertCollection(this.contents))
-          this.contents.addIn(path, value);
+          this.contents.addIn(path, value2);
       }
       /**
        * Create a new `Alias` node, ensuring that the target `node` has the required anchor.
@@ -11541,10 +11541,10 @@ var require_Document = __commonJS({
         }
         return new Alias.Alias(node.anchor);
       }
-      createNode(value, replacer, options) {
+      createNode(value2, replacer, options) {
         let _replacer = void 0;
         if (typeof replacer === "function") {
-          value = replacer.call({ "": value }, "", value);
+          value2 = replacer.call({ "": value2 }, "", value2);
           _replacer = replacer;
         } else if (Array.isArray(replacer)) {
           const keyToStr = (v) => typeof v === "number" || v instanceof String || v instanceof Number;
@@ -11571,7 +11571,7 @@ var require_Document = __commonJS({
           schema: this.schema,
           sourceObjects
         };
-        const node = createNode.createNode(value, tag, ctx);
+        const node = createNode.createNode(value2, tag, ctx);
         if (flow && identity.isCollection(node))
           node.flow = true;
         setAnchors();
@@ -11581,9 +11581,9 @@ var require_Document = __commonJS({
        * Convert a key and a value into a `Pair` using the current schema,
        * recursively wrapping all values as `Scalar` or `Collection` nodes.
        */
-      createPair(key, value, options = {}) {
+      createPair(key, value2, options = {}) {
         const k = this.createNode(key, null, options);
-        const v = this.createNode(value, null, options);
+        const v = this.createNode(value2, null, options);
         return new Pair.Pair(k, v);
       }
       /**
@@ -11642,24 +11642,24 @@ var require_Document = __commonJS({
        * Sets a value in this document. For `!!set`, `value` needs to be a
        * boolean to add/remove the item from the set.
        */
-      set(key, value) {
+      set(key, value2) {
         if (this.contents == null) {
-          this.contents = Collection.collectionFromPath(this.schema, [key], value);
+          this.contents = Collection.collectionFromPath(this.schema, [key], value2);
         } else if (assertCollection(this.contents)) {
-          this.contents.set(key, value);
+          this.contents.set(key, value2);
         }
       }
       /**
        * Sets a value in this document. For `!!set`, `value` needs to be a
        * boolean to add/remove the item from the set.
        */
-      setIn(path, value) {
+      setIn(path, value2) {
         if (Collection.isEmptyPath(path)) {
-          this.contents = value;
+          this.contents = value2;
         } else if (this.contents == null) {
-          this.contents = Collection.collectionFromPath(this.schema, Array.from(path), value);
+          this.contents = Collection.collectionFromPath(this.schema, Array.from(path), value2);
         } else if (assertCollection(this.contents)) {
-          this.contents.setIn(path, value);
+          this.contents.setIn(path, value2);
         }
       }
       /**
@@ -12045,7 +12045,7 @@ var require_resolve_block_map = __commonJS({
       let offset = bm.offset;
       let commentEnd = null;
       for (const collItem of bm.items) {
-        const { start, key, sep: sep3, value } = collItem;
+        const { start, key, sep: sep3, value: value2 } = collItem;
         const keyProps = resolveProps.resolveProps(start, {
           indicator: "explicit-key-ind",
           next: key ?? sep3?.[0],
@@ -12088,7 +12088,7 @@ var require_resolve_block_map = __commonJS({
           onError(keyStart, "DUPLICATE_KEY", "Map keys must be unique");
         const valueProps = resolveProps.resolveProps(sep3 ?? [], {
           indicator: "map-value-ind",
-          next: value,
+          next: value2,
           offset: keyNode.range[2],
           onError,
           parentIndent: bm.indent,
@@ -12097,14 +12097,14 @@ var require_resolve_block_map = __commonJS({
         offset = valueProps.end;
         if (valueProps.found) {
           if (implicitKey) {
-            if (value?.type === "block-map" && !valueProps.hasNewline)
+            if (value2?.type === "block-map" && !valueProps.hasNewline)
               onError(offset, "BLOCK_AS_IMPLICIT_KEY", "Nested mappings are not allowed in compact mappings");
             if (ctx.options.strict && keyProps.start < valueProps.found.offset - 1024)
               onError(keyNode.range, "KEY_OVER_1024_CHARS", "The : indicator must be at most 1024 chars after the start of an implicit block mapping key");
           }
-          const valueNode = value ? composeNode(ctx, value, valueProps, onError) : composeEmptyNode(ctx, offset, sep3, null, valueProps, onError);
+          const valueNode = value2 ? composeNode(ctx, value2, valueProps, onError) : composeEmptyNode(ctx, offset, sep3, null, valueProps, onError);
           if (ctx.schema.compat)
-            utilFlowIndentCheck.flowIndentCheck(bm.indent, value, onError);
+            utilFlowIndentCheck.flowIndentCheck(bm.indent, value2, onError);
           offset = valueNode.range[2];
           const pair = new Pair.Pair(keyNode, valueNode);
           if (ctx.options.keepSourceTokens)
@@ -12150,18 +12150,18 @@ var require_resolve_block_seq = __commonJS({
         ctx.atKey = false;
       let offset = bs.offset;
       let commentEnd = null;
-      for (const { start, value } of bs.items) {
+      for (const { start, value: value2 } of bs.items) {
         const props = resolveProps.resolveProps(start, {
           indicator: "seq-item-ind",
-          next: value,
+          next: value2,
           offset,
           onError,
           parentIndent: bs.indent,
           startOnNewline: true
         });
         if (!props.found) {
-          if (props.anchor || props.tag || value) {
-            if (value?.type === "block-seq")
+          if (props.anchor || props.tag || value2) {
+            if (value2?.type === "block-seq")
               onError(props.end, "BAD_INDENT", "All sequence items must start at the same column");
             else
               onError(offset, "MISSING_CHAR", "Sequence item without - indicator");
@@ -12172,9 +12172,9 @@ var require_resolve_block_seq = __commonJS({
             continue;
           }
         }
-        const node = value ? composeNode(ctx, value, props, onError) : composeEmptyNode(ctx, props.end, start, null, props, onError);
+        const node = value2 ? composeNode(ctx, value2, props, onError) : composeEmptyNode(ctx, props.end, start, null, props, onError);
         if (ctx.schema.compat)
-          utilFlowIndentCheck.flowIndentCheck(bs.indent, value, onError);
+          utilFlowIndentCheck.flowIndentCheck(bs.indent, value2, onError);
         offset = node.range[2];
         seq.items.push(node);
       }
@@ -12256,7 +12256,7 @@ var require_resolve_flow_collection = __commonJS({
       let offset = fc.offset + fc.start.source.length;
       for (let i = 0; i < fc.items.length; ++i) {
         const collItem = fc.items[i];
-        const { start, key, sep: sep3, value } = collItem;
+        const { start, key, sep: sep3, value: value2 } = collItem;
         const props = resolveProps.resolveProps(start, {
           flow: fcName,
           indicator: "explicit-key-ind",
@@ -12267,7 +12267,7 @@ var require_resolve_flow_collection = __commonJS({
           startOnNewline: false
         });
         if (!props.found) {
-          if (!props.anchor && !props.tag && !sep3 && !value) {
+          if (!props.anchor && !props.tag && !sep3 && !value2) {
             if (i === 0 && props.comma)
               onError(props.comma, "UNEXPECTED_TOKEN", `Unexpected , in ${fcName}`);
             else if (i < fc.items.length - 1)
@@ -12322,10 +12322,10 @@ var require_resolve_flow_collection = __commonJS({
           }
         }
         if (!isMap && !sep3 && !props.found) {
-          const valueNode = value ? composeNode(ctx, value, props, onError) : composeEmptyNode(ctx, props.end, sep3, null, props, onError);
+          const valueNode = value2 ? composeNode(ctx, value2, props, onError) : composeEmptyNode(ctx, props.end, sep3, null, props, onError);
           coll.items.push(valueNode);
           offset = valueNode.range[2];
-          if (isBlock(value))
+          if (isBlock(value2))
             onError(valueNode.range, "BLOCK_IN_FLOW", blockMsg);
         } else {
           ctx.atKey = true;
@@ -12337,7 +12337,7 @@ var require_resolve_flow_collection = __commonJS({
           const valueProps = resolveProps.resolveProps(sep3 ?? [], {
             flow: fcName,
             indicator: "map-value-ind",
-            next: value,
+            next: value2,
             offset: keyNode.range[2],
             onError,
             parentIndent: fc.indent,
@@ -12357,15 +12357,15 @@ var require_resolve_flow_collection = __commonJS({
               if (props.start < valueProps.found.offset - 1024)
                 onError(valueProps.found, "KEY_OVER_1024_CHARS", "The : indicator must be at most 1024 chars after the start of an implicit flow sequence key");
             }
-          } else if (value) {
-            if ("source" in value && value.source?.[0] === ":")
-              onError(value, "MISSING_CHAR", `Missing space after : in ${fcName}`);
+          } else if (value2) {
+            if ("source" in value2 && value2.source?.[0] === ":")
+              onError(value2, "MISSING_CHAR", `Missing space after : in ${fcName}`);
             else
               onError(valueProps.start, "MISSING_CHAR", `Missing , or : between ${fcName} items`);
           }
-          const valueNode = value ? composeNode(ctx, value, valueProps, onError) : valueProps.found ? composeEmptyNode(ctx, valueProps.end, sep3, null, valueProps, onError) : null;
+          const valueNode = value2 ? composeNode(ctx, value2, valueProps, onError) : valueProps.found ? composeEmptyNode(ctx, valueProps.end, sep3, null, valueProps, onError) : null;
           if (valueNode) {
-            if (isBlock(value))
+            if (isBlock(value2))
               onError(valueNode.range, "BLOCK_IN_FLOW", blockMsg);
           } else if (valueProps.comment) {
             if (keyNode.comment)
@@ -12508,11 +12508,11 @@ var require_resolve_block_scalar = __commonJS({
           break;
       }
       if (chompStart === 0) {
-        const value2 = header.chomp === "+" && lines.length > 0 ? "\n".repeat(Math.max(1, lines.length - 1)) : "";
+        const value3 = header.chomp === "+" && lines.length > 0 ? "\n".repeat(Math.max(1, lines.length - 1)) : "";
         let end2 = start + header.length;
         if (scalar.source)
           end2 += scalar.source.length;
-        return { value: value2, type, comment: header.comment, range: [start, end2, end2] };
+        return { value: value3, type, comment: header.comment, range: [start, end2, end2] };
       }
       let trimIndent = scalar.indent + header.indent;
       let offset = scalar.offset + header.length;
@@ -12542,11 +12542,11 @@ var require_resolve_block_scalar = __commonJS({
         if (lines[i][0].length > trimIndent)
           chompStart = i + 1;
       }
-      let value = "";
+      let value2 = "";
       let sep3 = "";
       let prevMoreIndented = false;
       for (let i = 0; i < contentStart; ++i)
-        value += lines[i][0].slice(trimIndent) + "\n";
+        value2 += lines[i][0].slice(trimIndent) + "\n";
       for (let i = contentStart; i < chompStart; ++i) {
         let [indent, content] = lines[i];
         offset += indent.length + content.length + 1;
@@ -12560,23 +12560,23 @@ var require_resolve_block_scalar = __commonJS({
           indent = "";
         }
         if (type === Scalar.Scalar.BLOCK_LITERAL) {
-          value += sep3 + indent.slice(trimIndent) + content;
+          value2 += sep3 + indent.slice(trimIndent) + content;
           sep3 = "\n";
         } else if (indent.length > trimIndent || content[0] === "	") {
           if (sep3 === " ")
             sep3 = "\n";
           else if (!prevMoreIndented && sep3 === "\n")
             sep3 = "\n\n";
-          value += sep3 + indent.slice(trimIndent) + content;
+          value2 += sep3 + indent.slice(trimIndent) + content;
           sep3 = "\n";
           prevMoreIndented = true;
         } else if (content === "") {
           if (sep3 === "\n")
-            value += "\n";
+            value2 += "\n";
           else
             sep3 = "\n";
         } else {
-          value += sep3 + content;
+          value2 += sep3 + content;
           sep3 = " ";
           prevMoreIndented = false;
         }
@@ -12586,15 +12586,15 @@ var require_resolve_block_scalar = __commonJS({
           break;
         case "+":
           for (let i = chompStart; i < lines.length; ++i)
-            value += "\n" + lines[i][0].slice(trimIndent);
-          if (value[value.length - 1] !== "\n")
-            value += "\n";
+            value2 += "\n" + lines[i][0].slice(trimIndent);
+          if (value2[value2.length - 1] !== "\n")
+            value2 += "\n";
           break;
         default:
-          value += "\n";
+          value2 += "\n";
       }
       const end = start + header.length + scalar.source.length;
-      return { value, type, comment: header.comment, range: [start, end, end] };
+      return { value: value2, type, comment: header.comment, range: [start, end, end] };
     }
     function parseBlockScalarHeader({ offset, props }, strict, onError) {
       if (props[0].type !== "block-scalar-header") {
@@ -12679,20 +12679,20 @@ var require_resolve_flow_scalar = __commonJS({
     function resolveFlowScalar(scalar, strict, onError) {
       const { offset, type, source, end } = scalar;
       let _type;
-      let value;
+      let value2;
       const _onError = (rel, code, msg) => onError(offset + rel, code, msg);
       switch (type) {
         case "scalar":
           _type = Scalar.Scalar.PLAIN;
-          value = plainValue(source, _onError);
+          value2 = plainValue(source, _onError);
           break;
         case "single-quoted-scalar":
           _type = Scalar.Scalar.QUOTE_SINGLE;
-          value = singleQuotedValue(source, _onError);
+          value2 = singleQuotedValue(source, _onError);
           break;
         case "double-quoted-scalar":
           _type = Scalar.Scalar.QUOTE_DOUBLE;
-          value = doubleQuotedValue(source, _onError);
+          value2 = doubleQuotedValue(source, _onError);
           break;
         /* istanbul ignore next should not happen */
         default:
@@ -12707,7 +12707,7 @@ var require_resolve_flow_scalar = __commonJS({
       const valueEnd = offset + source.length;
       const re = resolveEnd.resolveEnd(end, valueEnd, strict, onError);
       return {
-        value,
+        value: value2,
         type: _type,
         comment: re.comment,
         range: [offset, valueEnd, re.offset]
@@ -12900,28 +12900,28 @@ var require_compose_scalar = __commonJS({
     var resolveBlockScalar = require_resolve_block_scalar();
     var resolveFlowScalar = require_resolve_flow_scalar();
     function composeScalar(ctx, token, tagToken, onError) {
-      const { value, type, comment, range } = token.type === "block-scalar" ? resolveBlockScalar.resolveBlockScalar(ctx, token, onError) : resolveFlowScalar.resolveFlowScalar(token, ctx.options.strict, onError);
+      const { value: value2, type, comment, range } = token.type === "block-scalar" ? resolveBlockScalar.resolveBlockScalar(ctx, token, onError) : resolveFlowScalar.resolveFlowScalar(token, ctx.options.strict, onError);
       const tagName = tagToken ? ctx.directives.tagName(tagToken.source, (msg) => onError(tagToken, "TAG_RESOLVE_FAILED", msg)) : null;
       let tag;
       if (ctx.options.stringKeys && ctx.atKey) {
         tag = ctx.schema[identity.SCALAR];
       } else if (tagName)
-        tag = findScalarTagByName(ctx.schema, value, tagName, tagToken, onError);
+        tag = findScalarTagByName(ctx.schema, value2, tagName, tagToken, onError);
       else if (token.type === "scalar")
-        tag = findScalarTagByTest(ctx, value, token, onError);
+        tag = findScalarTagByTest(ctx, value2, token, onError);
       else
         tag = ctx.schema[identity.SCALAR];
       let scalar;
       try {
-        const res = tag.resolve(value, (msg) => onError(tagToken ?? token, "TAG_RESOLVE_FAILED", msg), ctx.options);
+        const res = tag.resolve(value2, (msg) => onError(tagToken ?? token, "TAG_RESOLVE_FAILED", msg), ctx.options);
         scalar = identity.isScalar(res) ? res : new Scalar.Scalar(res);
       } catch (error) {
         const msg = error instanceof Error ? error.message : String(error);
         onError(tagToken ?? token, "TAG_RESOLVE_FAILED", msg);
-        scalar = new Scalar.Scalar(value);
+        scalar = new Scalar.Scalar(value2);
       }
       scalar.range = range;
-      scalar.source = value;
+      scalar.source = value2;
       if (type)
         scalar.type = type;
       if (tagName)
@@ -12932,7 +12932,7 @@ var require_compose_scalar = __commonJS({
         scalar.comment = comment;
       return scalar;
     }
-    function findScalarTagByName(schema, value, tagName, tagToken, onError) {
+    function findScalarTagByName(schema, value2, tagName, tagToken, onError) {
       if (tagName === "!")
         return schema[identity.SCALAR];
       const matchWithTest = [];
@@ -12945,7 +12945,7 @@ var require_compose_scalar = __commonJS({
         }
       }
       for (const tag of matchWithTest)
-        if (tag.test?.test(value))
+        if (tag.test?.test(value2))
           return tag;
       const kt = schema.knownTags[tagName];
       if (kt && !kt.collection) {
@@ -12955,10 +12955,10 @@ var require_compose_scalar = __commonJS({
       onError(tagToken, "TAG_RESOLVE_FAILED", `Unresolved tag: ${tagName}`, tagName !== "tag:yaml.org,2002:str");
       return schema[identity.SCALAR];
     }
-    function findScalarTagByTest({ atKey, directives, schema }, value, token, onError) {
-      const tag = schema.tags.find((tag2) => (tag2.default === true || atKey && tag2.default === "key") && tag2.test?.test(value)) || schema[identity.SCALAR];
+    function findScalarTagByTest({ atKey, directives, schema }, value2, token, onError) {
+      const tag = schema.tags.find((tag2) => (tag2.default === true || atKey && tag2.default === "key") && tag2.test?.test(value2)) || schema[identity.SCALAR];
       if (schema.compat) {
-        const compat = schema.compat.find((tag2) => tag2.default && tag2.test?.test(value)) ?? schema[identity.SCALAR];
+        const compat = schema.compat.find((tag2) => tag2.default && tag2.test?.test(value2)) ?? schema[identity.SCALAR];
         if (tag.tag !== compat.tag) {
           const ts = directives.tagString(tag.tag);
           const cs = directives.tagString(compat.tag);
@@ -13116,7 +13116,7 @@ var require_compose_doc = __commonJS({
     var composeNode = require_compose_node();
     var resolveEnd = require_resolve_end();
     var resolveProps = require_resolve_props();
-    function composeDoc(options, directives, { offset, start, value, end }, onError) {
+    function composeDoc(options, directives, { offset, start, value: value2, end }, onError) {
       const opts = Object.assign({ _directives: directives }, options);
       const doc = new Document.Document(void 0, opts);
       const ctx = {
@@ -13128,7 +13128,7 @@ var require_compose_doc = __commonJS({
       };
       const props = resolveProps.resolveProps(start, {
         indicator: "doc-start",
-        next: value ?? end?.[0],
+        next: value2 ?? end?.[0],
         offset,
         onError,
         parentIndent: 0,
@@ -13136,10 +13136,10 @@ var require_compose_doc = __commonJS({
       });
       if (props.found) {
         doc.directives.docStart = true;
-        if (value && (value.type === "block-map" || value.type === "block-seq") && !props.hasNewline)
+        if (value2 && (value2.type === "block-map" || value2.type === "block-seq") && !props.hasNewline)
           onError(props.end, "MISSING_CHAR", "Block collection cannot start on same line with directives-end marker");
       }
-      doc.contents = value ? composeNode.composeNode(ctx, value, props, onError) : composeNode.composeEmptyNode(ctx, props.end, start, null, props, onError);
+      doc.contents = value2 ? composeNode.composeNode(ctx, value2, props, onError) : composeNode.composeEmptyNode(ctx, props.end, start, null, props, onError);
       const contentEnd = doc.contents.range[2];
       const re = resolveEnd.resolveEnd(end, contentEnd, false, onError);
       if (re.comment)
@@ -13387,9 +13387,9 @@ var require_cst_scalar = __commonJS({
       }
       return null;
     }
-    function createScalarToken(value, context) {
+    function createScalarToken(value2, context) {
       const { implicitKey = false, indent, inFlow = false, offset = -1, type = "PLAIN" } = context;
-      const source = stringifyString.stringifyString({ type, value }, {
+      const source = stringifyString.stringifyString({ type, value: value2 }, {
         implicitKey,
         indent: indent > 0 ? " ".repeat(indent) : "",
         inFlow,
@@ -13419,7 +13419,7 @@ var require_cst_scalar = __commonJS({
           return { type: "scalar", offset, indent, source, end };
       }
     }
-    function setScalarValue(token, value, context = {}) {
+    function setScalarValue(token, value2, context = {}) {
       let { afterKey = false, implicitKey = false, inFlow = false, type } = context;
       let indent = "indent" in token ? token.indent : null;
       if (afterKey && typeof indent === "number")
@@ -13442,7 +13442,7 @@ var require_cst_scalar = __commonJS({
           default:
             type = "PLAIN";
         }
-      const source = stringifyString.stringifyString({ type, value }, {
+      const source = stringifyString.stringifyString({ type, value: value2 }, {
         implicitKey: implicitKey || indent === null,
         indent: indent !== null && indent > 0 ? " ".repeat(indent) : "",
         inFlow,
@@ -13588,7 +13588,7 @@ var require_cst_stringify = __commonJS({
         }
       }
     }
-    function stringifyItem({ start, key, sep: sep3, value }) {
+    function stringifyItem({ start, key, sep: sep3, value: value2 }) {
       let res = "";
       for (const st of start)
         res += st.source;
@@ -13597,8 +13597,8 @@ var require_cst_stringify = __commonJS({
       if (sep3)
         for (const st of sep3)
           res += st.source;
-      if (value)
-        res += stringifyToken(value);
+      if (value2)
+        res += stringifyToken(value2);
       return res;
     }
     exports.stringify = stringify;
@@ -15331,7 +15331,7 @@ var require_public_api = __commonJS({
       }
       return doc.toJS(Object.assign({ reviver: _reviver }, options));
     }
-    function stringify(value, replacer, options) {
+    function stringify(value2, replacer, options) {
       let _replacer = null;
       if (typeof replacer === "function" || Array.isArray(replacer)) {
         _replacer = replacer;
@@ -15344,14 +15344,14 @@ var require_public_api = __commonJS({
         const indent = Math.round(options);
         options = indent < 1 ? void 0 : indent > 8 ? { indent: 8 } : { indent };
       }
-      if (value === void 0) {
+      if (value2 === void 0) {
         const { keepUndefined } = options ?? replacer ?? {};
         if (!keepUndefined)
           return void 0;
       }
-      if (identity.isDocument(value) && !_replacer)
-        return value.toString(options);
-      return new Document.Document(value, _replacer, options).toString(options);
+      if (identity.isDocument(value2) && !_replacer)
+        return value2.toString(options);
+      return new Document.Document(value2, _replacer, options).toString(options);
     }
     exports.parse = parse;
     exports.parseAllDocuments = parseAllDocuments;
@@ -15441,8 +15441,8 @@ var require_jstat = __commonJS({
         function isFunction(arg) {
           return toString.call(arg) === "[object Function]";
         }
-        function isNumber(num2) {
-          return typeof num2 === "number" ? num2 - num2 === 0 : false;
+        function isNumber(num) {
+          return typeof num === "number" ? num - num === 0 : false;
         }
         function toVector(arr) {
           return concat.apply([], arr);
@@ -16155,12 +16155,12 @@ var require_jstat = __commonJS({
           var counter = 0;
           var len = arr.length;
           var strict = false;
-          var value, i;
+          var value2, i;
           if (kind === "strict")
             strict = true;
           for (i = 0; i < len; i++) {
-            value = arr[i];
-            if (strict && value < score || !strict && value <= score) {
+            value2 = arr[i];
+            if (strict && value2 < score || !strict && value2 <= score) {
               counter++;
             }
           }
@@ -16743,8 +16743,8 @@ var require_jstat = __commonJS({
           for (var i = 0; i < funcs.length; i++) (function(passfunc) {
             jStat4.fn[passfunc] = function() {
               return jStat4(
-                jStat4.map(this, function(value) {
-                  return jStat4[passfunc](value);
+                jStat4.map(this, function(value2) {
+                  return jStat4[passfunc](value2);
                 })
               );
             };
@@ -17116,20 +17116,20 @@ var require_jstat = __commonJS({
               ncp = -ncp;
             }
             var prob = jStat4.normal.cdf(-ncp, 0, 1);
-            var value = tol + 1;
-            var lastvalue = value;
+            var value2 = tol + 1;
+            var lastvalue = value2;
             var y = x * x / (x * x + dof);
             var j = 0;
             var p = Math2.exp(-ncp * ncp / 2);
             var q = Math2.exp(-ncp * ncp / 2 - 0.5 * Math2.log(2) - jStat4.gammaln(3 / 2)) * ncp;
-            while (j < min_iterations || lastvalue > tol || value > tol) {
-              lastvalue = value;
+            while (j < min_iterations || lastvalue > tol || value2 > tol) {
+              lastvalue = value2;
               if (j > 0) {
                 p *= ncp * ncp / (2 * j);
                 q *= ncp * ncp / (2 * (j + 1 / 2));
               }
-              value = p * jStat4.beta.cdf(y, j + 0.5, dof / 2) + q * jStat4.beta.cdf(y, j + 1, dof / 2);
-              prob += 0.5 * value;
+              value2 = p * jStat4.beta.cdf(y, j + 0.5, dof / 2) + q * jStat4.beta.cdf(y, j + 1, dof / 2);
+              prob += 0.5 * value2;
               j++;
             }
             return flip ? 1 - prob : prob;
@@ -17855,24 +17855,24 @@ var require_jstat = __commonJS({
           add: function add2(arr, arg) {
             if (isUsable(arg)) {
               if (!isUsable(arg[0])) arg = [arg];
-              return jStat4.map(arr, function(value, row, col) {
-                return value + arg[row][col];
+              return jStat4.map(arr, function(value2, row, col) {
+                return value2 + arg[row][col];
               });
             }
-            return jStat4.map(arr, function(value) {
-              return value + arg;
+            return jStat4.map(arr, function(value2) {
+              return value2 + arg;
             });
           },
           // subtract a vector or scalar from the vector
           subtract: function subtract(arr, arg) {
             if (isUsable(arg)) {
               if (!isUsable(arg[0])) arg = [arg];
-              return jStat4.map(arr, function(value, row, col) {
-                return value - arg[row][col] || 0;
+              return jStat4.map(arr, function(value2, row, col) {
+                return value2 - arg[row][col] || 0;
               });
             }
-            return jStat4.map(arr, function(value) {
-              return value - arg;
+            return jStat4.map(arr, function(value2) {
+              return value2 - arg;
             });
           },
           // matrix division
@@ -17881,8 +17881,8 @@ var require_jstat = __commonJS({
               if (!isUsable(arg[0])) arg = [arg];
               return jStat4.multiply(arr, jStat4.inv(arg));
             }
-            return jStat4.map(arr, function(value) {
-              return value / arg;
+            return jStat4.map(arr, function(value2) {
+              return value2 / arg;
             });
           },
           // matrix multiplication
@@ -17903,8 +17903,8 @@ var require_jstat = __commonJS({
               }
               return nrow === 1 && rescols === 1 ? res[0][0] : res;
             }
-            return jStat4.map(arr, function(value) {
-              return value * arg;
+            return jStat4.map(arr, function(value2) {
+              return value2 * arg;
             });
           },
           // outer([1,2,3],[4,5,6])
@@ -17933,26 +17933,26 @@ var require_jstat = __commonJS({
           },
           // raise every element by a scalar
           pow: function pow(arr, arg) {
-            return jStat4.map(arr, function(value) {
-              return Math2.pow(value, arg);
+            return jStat4.map(arr, function(value2) {
+              return Math2.pow(value2, arg);
             });
           },
           // exponentiate every element
           exp: function exp(arr) {
-            return jStat4.map(arr, function(value) {
-              return Math2.exp(value);
+            return jStat4.map(arr, function(value2) {
+              return Math2.exp(value2);
             });
           },
           // generate the natural log of every element
           log: function exp(arr) {
-            return jStat4.map(arr, function(value) {
-              return Math2.log(value);
+            return jStat4.map(arr, function(value2) {
+              return Math2.log(value2);
             });
           },
           // generate the absolute values of the vector
           abs: function abs(arr) {
-            return jStat4.map(arr, function(value) {
-              return Math2.abs(value);
+            return jStat4.map(arr, function(value2) {
+              return Math2.abs(value2);
             });
           },
           // computes the p-norm of the vector
@@ -18585,7 +18585,7 @@ var require_jstat = __commonJS({
             }
             return h / 3 * (I + f(b));
           },
-          hermite: function hermite(X, F, dF, value) {
+          hermite: function hermite(X, F, dF, value2) {
             var n = X.length;
             var p = 0;
             var i = 0;
@@ -18597,19 +18597,19 @@ var require_jstat = __commonJS({
             for (; i < n; i++) {
               l[i] = 1;
               for (j = 0; j < n; j++) {
-                if (i != j) l[i] *= (value - X[j]) / (X[i] - X[j]);
+                if (i != j) l[i] *= (value2 - X[j]) / (X[i] - X[j]);
               }
               dl[i] = 0;
               for (j = 0; j < n; j++) {
                 if (i != j) dl[i] += 1 / (X[i] - X[j]);
               }
-              A[i] = (1 - 2 * (value - X[i]) * dl[i]) * (l[i] * l[i]);
-              B[i] = (value - X[i]) * (l[i] * l[i]);
+              A[i] = (1 - 2 * (value2 - X[i]) * dl[i]) * (l[i] * l[i]);
+              B[i] = (value2 - X[i]) * (l[i] * l[i]);
               p += A[i] * F[i] + B[i] * dF[i];
             }
             return p;
           },
-          lagrange: function lagrange(X, F, value) {
+          lagrange: function lagrange(X, F, value2) {
             var p = 0;
             var i = 0;
             var j, l;
@@ -18617,13 +18617,13 @@ var require_jstat = __commonJS({
             for (; i < n; i++) {
               l = F[i];
               for (j = 0; j < n; j++) {
-                if (i != j) l *= (value - X[j]) / (X[i] - X[j]);
+                if (i != j) l *= (value2 - X[j]) / (X[i] - X[j]);
               }
               p += l;
             }
             return p;
           },
-          cubic_spline: function cubic_spline(X, F, value) {
+          cubic_spline: function cubic_spline(X, F, value2) {
             var n = X.length;
             var i = 0, j;
             var A = [];
@@ -18653,10 +18653,10 @@ var require_jstat = __commonJS({
               d[j] = (c[j + 1][0] - c[j][0]) / (3 * h[j]);
             }
             for (j = 0; j < n; j++) {
-              if (X[j] > value) break;
+              if (X[j] > value2) break;
             }
             j -= 1;
-            return F[j] + (value - X[j]) * b[j] + jStat4.sq(value - X[j]) * c[j] + (value - X[j]) * jStat4.sq(value - X[j]) * d[j];
+            return F[j] + (value2 - X[j]) * b[j] + jStat4.sq(value2 - X[j]) * c[j] + (value2 - X[j]) * jStat4.sq(value2 - X[j]) * d[j];
           },
           gauss_quadrature: function gauss_quadrature() {
             throw new Error("gauss_quadrature not yet implemented");
@@ -18773,11 +18773,11 @@ var require_jstat = __commonJS({
           }
         });
         jStat4.extend(jStat4.fn, {
-          zscore: function zscore(value, flag) {
-            return (value - this.mean()) / this.stdev(flag);
+          zscore: function zscore(value2, flag) {
+            return (value2 - this.mean()) / this.stdev(flag);
           },
-          ztest: function ztest(value, sides, flag) {
-            var zscore = Math2.abs(this.zscore(value, flag));
+          ztest: function ztest(value2, sides, flag) {
+            var zscore = Math2.abs(this.zscore(value2, flag));
             return sides === 1 ? jStat4.normal.cdf(-zscore, 0, 1) : jStat4.normal.cdf(-zscore, 0, 1) * 2;
           }
         });
@@ -18809,11 +18809,11 @@ var require_jstat = __commonJS({
           }
         });
         jStat4.extend(jStat4.fn, {
-          tscore: function tscore(value) {
-            return (value - this.mean()) / (this.stdev(true) / Math2.sqrt(this.cols()));
+          tscore: function tscore(value2) {
+            return (value2 - this.mean()) / (this.stdev(true) / Math2.sqrt(this.cols()));
           },
-          ttest: function ttest(value, sides) {
-            return sides === 1 ? 1 - jStat4.studentt.cdf(Math2.abs(this.tscore(value)), this.cols() - 1) : jStat4.studentt.cdf(-Math2.abs(this.tscore(value)), this.cols() - 1) * 2;
+          ttest: function ttest(value2, sides) {
+            return sides === 1 ? 1 - jStat4.studentt.cdf(Math2.abs(this.tscore(value2)), this.cols() - 1) : jStat4.studentt.cdf(-Math2.abs(this.tscore(value2)), this.cols() - 1) * 2;
           }
         });
         jStat4.extend({
@@ -18950,28 +18950,28 @@ var require_jstat = __commonJS({
           // (value, alpha, sd, n)
           // (value, alpha, array)
           normalci: function normalci() {
-            var args = slice.call(arguments), ans = new Array(2), change;
+            var args = slice.call(arguments), ans = new Array(2), change2;
             if (args.length === 4) {
-              change = Math2.abs(jStat4.normal.inv(args[1] / 2, 0, 1) * args[2] / Math2.sqrt(args[3]));
+              change2 = Math2.abs(jStat4.normal.inv(args[1] / 2, 0, 1) * args[2] / Math2.sqrt(args[3]));
             } else {
-              change = Math2.abs(jStat4.normal.inv(args[1] / 2, 0, 1) * jStat4.stdev(args[2]) / Math2.sqrt(args[2].length));
+              change2 = Math2.abs(jStat4.normal.inv(args[1] / 2, 0, 1) * jStat4.stdev(args[2]) / Math2.sqrt(args[2].length));
             }
-            ans[0] = args[0] - change;
-            ans[1] = args[0] + change;
+            ans[0] = args[0] - change2;
+            ans[1] = args[0] + change2;
             return ans;
           },
           // 2 different parameter setups
           // (value, alpha, sd, n)
           // (value, alpha, array)
           tci: function tci() {
-            var args = slice.call(arguments), ans = new Array(2), change;
+            var args = slice.call(arguments), ans = new Array(2), change2;
             if (args.length === 4) {
-              change = Math2.abs(jStat4.studentt.inv(args[1] / 2, args[3] - 1) * args[2] / Math2.sqrt(args[3]));
+              change2 = Math2.abs(jStat4.studentt.inv(args[1] / 2, args[3] - 1) * args[2] / Math2.sqrt(args[3]));
             } else {
-              change = Math2.abs(jStat4.studentt.inv(args[1] / 2, args[2].length - 1) * jStat4.stdev(args[2], true) / Math2.sqrt(args[2].length));
+              change2 = Math2.abs(jStat4.studentt.inv(args[1] / 2, args[2].length - 1) * jStat4.stdev(args[2], true) / Math2.sqrt(args[2].length));
             }
-            ans[0] = args[0] - change;
-            ans[1] = args[0] + change;
+            ans[0] = args[0] - change2;
+            ans[1] = args[0] + change2;
             return ans;
           },
           significant: function significant(pvalue, alpha) {
@@ -18979,11 +18979,11 @@ var require_jstat = __commonJS({
           }
         });
         jStat4.extend(jStat4.fn, {
-          normalci: function normalci(value, alpha) {
-            return jStat4.normalci(value, alpha, this.toArray());
+          normalci: function normalci(value2, alpha) {
+            return jStat4.normalci(value2, alpha, this.toArray());
           },
-          tci: function tci(value, alpha) {
-            return jStat4.tci(value, alpha, this.toArray());
+          tci: function tci(value2, alpha) {
+            return jStat4.tci(value2, alpha, this.toArray());
           }
         });
         function differenceOfProportions(p1, n1, p2, n2) {
@@ -19068,7 +19068,7 @@ var require_jstat = __commonJS({
           var tStatistic = model.coef.map(function(coef, i) {
             return (coef - 0) / seBetaHat[i];
           });
-          var pValue2 = tStatistic.map(function(t) {
+          var pValue = tStatistic.map(function(t) {
             var leftppf = jStat3.studentt.cdf(t, model.df_resid);
             return (leftppf > 0.5 ? 1 - leftppf : leftppf) * 2;
           });
@@ -19080,7 +19080,7 @@ var require_jstat = __commonJS({
           return {
             se: seBetaHat,
             t: tStatistic,
-            p: pValue2,
+            p: pValue,
             sigmaHat,
             interval95
           };
@@ -19284,15 +19284,15 @@ function formatIssue(issue) {
   if (issue.hint !== void 0) text2 += ` ${issue.hint}`;
   return text2;
 }
-function quote(value) {
+function quote(value2) {
   let text2;
-  if (typeof value === "string") text2 = JSON.stringify(value);
-  else if (typeof value === "number" && !Number.isFinite(value)) text2 = String(value);
+  if (typeof value2 === "string") text2 = JSON.stringify(value2);
+  else if (typeof value2 === "number" && !Number.isFinite(value2)) text2 = String(value2);
   else {
     try {
-      text2 = JSON.stringify(value) ?? String(value);
+      text2 = JSON.stringify(value2) ?? String(value2);
     } catch {
-      text2 = String(value);
+      text2 = String(value2);
     }
   }
   return text2.length > 60 ? `${text2.slice(0, 57)}...` : text2;
@@ -19357,8 +19357,8 @@ function parseEpochLog(text2, file, mapping) {
     const cells = splitCsvLine(raw);
     const read = (index, name) => {
       const cell = cells[index] ?? "";
-      const value = cell === "" ? Number.NaN : Number(cell);
-      if (!Number.isFinite(value)) {
+      const value2 = cell === "" ? Number.NaN : Number(cell);
+      if (!Number.isFinite(value2)) {
         issues.push({
           file,
           pointer: `line ${i + 1}`,
@@ -19366,7 +19366,7 @@ function parseEpochLog(text2, file, mapping) {
           got: quote(cell)
         });
       }
-      return value;
+      return value2;
     };
     const point = { x: read(xi, mapping.x), validation: read(vi, mapping.validation) };
     if (ti !== void 0 && mapping.train !== void 0) point.train = read(ti, mapping.train);
@@ -19760,15 +19760,15 @@ function valueAt(doc, pointer) {
 function escapePointerToken(token) {
   return token.replace(/~/g, "~0").replace(/\//g, "~1");
 }
-function typeName(value) {
-  if (value === null) return "null";
-  if (Array.isArray(value)) return "an array";
-  if (typeof value === "object") return "an object";
-  return `${typeof value} ${quote(value)}`;
+function typeName(value2) {
+  if (value2 === null) return "null";
+  if (Array.isArray(value2)) return "an array";
+  if (typeof value2 === "object") return "an object";
+  return `${typeof value2} ${quote(value2)}`;
 }
 function oneIssue(error, file, doc) {
   const pointer = error.instancePath;
-  const value = valueAt(doc, pointer);
+  const value2 = valueAt(doc, pointer);
   const params = error.params;
   switch (error.keyword) {
     case "required":
@@ -19792,29 +19792,29 @@ function oneIssue(error, file, doc) {
         file,
         pointer,
         expected: `must be ${String(params["type"]) === "integer" ? "an integer" : `of type ${String(params["type"])}`}`,
-        got: typeName(value),
-        ...params["type"] === "number" && typeof value === "string" ? { hint: "Write numbers without quotes." } : {}
+        got: typeName(value2),
+        ...params["type"] === "number" && typeof value2 === "string" ? { hint: "Write numbers without quotes." } : {}
       };
     case "enum":
       return {
         file,
         pointer,
         expected: `must be one of ${params["allowedValues"].map((v) => quote(v)).join(", ")}`,
-        got: quote(value)
+        got: quote(value2)
       };
     case "const":
       return {
         file,
         pointer,
         expected: `must be ${quote(params["allowedValue"])}`,
-        got: quote(value)
+        got: quote(value2)
       };
     case "format":
       return {
         file,
         pointer,
         expected: `must be a ${String(params["format"])} string`,
-        got: quote(value),
+        got: quote(value2),
         ...params["format"] === "date-time" ? { hint: 'Use RFC 3339, e.g. "2026-11-30T10:00:00Z".' } : {}
       };
     default:
@@ -19822,7 +19822,7 @@ function oneIssue(error, file, doc) {
         file,
         pointer,
         expected: error.message ?? `fails ${error.keyword}`,
-        got: quote(value)
+        got: quote(value2)
       };
   }
 }
@@ -19853,10 +19853,10 @@ function nonFiniteNumbers(doc, pointer = "") {
 // src/validate/guardrails.ts
 function guardrailIssues(run, file) {
   const issues = [];
-  const names = /* @__PURE__ */ new Map();
+  const names2 = /* @__PURE__ */ new Map();
   run.guardrails?.forEach((guardrail, g) => {
     const at = `/guardrails/${g}`;
-    const first = names.get(guardrail.metric.name);
+    const first = names2.get(guardrail.metric.name);
     if (first !== void 0) {
       issues.push({
         file,
@@ -19864,7 +19864,7 @@ function guardrailIssues(run, file) {
         expected: `must be unique among the guardrails (also at /guardrails/${first}/metric/name)`,
         got: quote(guardrail.metric.name)
       });
-    } else names.set(guardrail.metric.name, g);
+    } else names2.set(guardrail.metric.name, g);
     if (guardrail.metric.name === run.metric.name) {
       issues.push({
         file,
@@ -19910,13 +19910,13 @@ function validator() {
 function semanticIssues(run, file) {
   const issues = [];
   const proportion = run.metric.kind === "proportion";
-  const inUnit = (value, pointer) => {
-    if (proportion && (value < 0 || value > 1)) {
+  const inUnit = (value2, pointer) => {
+    if (proportion && (value2 < 0 || value2 > 1)) {
       issues.push({
         file,
         pointer,
         expected: "must be within [0, 1] for a proportion metric",
-        got: quote(value),
+        got: quote(value2),
         hint: 'Write rates as fractions (0.07, not 7), or declare metric.kind "continuous".'
       });
     }
@@ -19977,9 +19977,9 @@ function semanticIssues(run, file) {
     inUnit(slice.validation, `/slices/${i}/validation`);
     if (slice.train !== void 0) inUnit(slice.train, `/slices/${i}/train`);
   });
-  const names = /* @__PURE__ */ new Map();
+  const names2 = /* @__PURE__ */ new Map();
   run.slices?.forEach((slice, i) => {
-    const first = names.get(slice.name);
+    const first = names2.get(slice.name);
     if (first !== void 0) {
       issues.push({
         file,
@@ -19987,7 +19987,7 @@ function semanticIssues(run, file) {
         expected: `must be unique (also at /slices/${first}/name)`,
         got: quote(slice.name)
       });
-    } else names.set(slice.name, i);
+    } else names2.set(slice.name, i);
   });
   if (run.predictions !== void 0) {
     const p = run.predictions.path;
@@ -20080,9 +20080,7 @@ async function loadRun(path, options = {}) {
     const info = logPath === null ? null : await stat(logPath).catch(() => null);
     if (logPath !== null && info?.isFile() === true) {
       if (artifact.curves?.epochs !== void 0) {
-        notes.push(
-          `${file}: the artifact has its own curves.epochs; the epoch log ${logName} was not used.`
-        );
+        notes.push({ code: "epoch-log-not-used", file, log: logName });
       } else {
         const text2 = (await readText(logPath, logName, "an epoch log (CSV)")).toString("utf8");
         artifact.curves = {
@@ -20093,9 +20091,7 @@ async function loadRun(path, options = {}) {
         if (issues.length > 0) throw new InputError(issues);
       }
     } else {
-      notes.push(
-        `No epoch log ${logName} next to ${file}; the config's epoch-log mapping was not applied to it.`
-      );
+      notes.push({ code: "epoch-log-missing", file, log: logName });
     }
   }
   return { artifact, file, sha256, predictionsPath, notes };
@@ -20226,8 +20222,8 @@ var FAIL_ON_VALUES = [
   "validation-overfit",
   "none"
 ];
-function isFailOn(value) {
-  return FAIL_ON_VALUES.includes(value);
+function isFailOn(value2) {
+  return FAIL_ON_VALUES.includes(value2);
 }
 var DEFAULT_SETTINGS = {
   alpha: 0.05,
@@ -20244,12 +20240,12 @@ function validator2() {
 }
 function failOnIssues(values, file, pointer) {
   return values.flatMap(
-    (value, i) => isFailOn(value) ? [] : [
+    (value2, i) => isFailOn(value2) ? [] : [
       {
         file,
         pointer: pointer === "" ? "" : `${pointer}/${i}`,
         expected: `must be one of ${FAIL_ON_VALUES.join(", ")}`,
-        got: quote(value)
+        got: quote(value2)
       }
     ]
   );
@@ -20319,14 +20315,14 @@ function assertAlpha(alpha) {
 function assertProbability(name, p) {
   if (!(p >= 0 && p <= 1)) throw new RangeError(`${name} must be in [0, 1]; got ${p}`);
 }
-function assertCount(name, value) {
-  if (!Number.isSafeInteger(value) || value < 0) {
-    throw new RangeError(`${name} must be a non-negative integer count; got ${value}`);
+function assertCount(name, value2) {
+  if (!Number.isSafeInteger(value2) || value2 < 0) {
+    throw new RangeError(`${name} must be a non-negative integer count; got ${value2}`);
   }
 }
-function assertFinite(name, value) {
-  if (!Number.isFinite(value))
-    throw new RangeError(`${name} must be a finite number; got ${value}`);
+function assertFinite(name, value2) {
+  if (!Number.isFinite(value2))
+    throw new RangeError(`${name} must be a finite number; got ${value2}`);
 }
 function assertFiniteValues(name, values) {
   for (let i = 0; i < values.length; i++) {
@@ -20352,9 +20348,9 @@ function assertOpenProbability(p) {
   if (!(p > 0 && p < 1)) throw new RangeError(`p must be in (0, 1) for a quantile; got ${p}`);
 }
 function ibeta(x, a, b) {
-  const value = import_jstat.default.ibeta(x, a, b);
-  if (value === false) throw new RangeError(`incomplete beta argument must be in [0, 1]; got ${x}`);
-  return Math.min(1, Math.max(0, value));
+  const value2 = import_jstat.default.ibeta(x, a, b);
+  if (value2 === false) throw new RangeError(`incomplete beta argument must be in [0, 1]; got ${x}`);
+  return Math.min(1, Math.max(0, value2));
 }
 function normalCdf(x) {
   if (Number.isNaN(x)) throw new RangeError("normalCdf: x must be a number; got NaN");
@@ -20569,19 +20565,19 @@ function mcnemarExact(b, c, n, alpha) {
 // src/stats/holm.ts
 function holmAdjust(p) {
   const present = [];
-  p.forEach((value, index) => {
-    if (value === null) return;
-    if (!(value >= 0 && value <= 1)) {
-      throw new RangeError(`holmAdjust: p[${index}] must be in [0, 1] or null; got ${value}`);
+  p.forEach((value2, index) => {
+    if (value2 === null) return;
+    if (!(value2 >= 0 && value2 <= 1)) {
+      throw new RangeError(`holmAdjust: p[${index}] must be in [0, 1] or null; got ${value2}`);
     }
-    present.push({ index, value });
+    present.push({ index, value: value2 });
   });
   present.sort((a, b) => a.value - b.value);
   const m = present.length;
   const out = p.map(() => null);
   let running = 0;
-  present.forEach(({ index, value }, rank) => {
-    running = Math.max(running, Math.min(1, (m - rank) * value));
+  present.forEach(({ index, value: value2 }, rank) => {
+    running = Math.max(running, Math.min(1, (m - rank) * value2));
     out[index] = running;
   });
   return out;
@@ -20589,6 +20585,743 @@ function holmAdjust(p) {
 
 // src/stats/noncentral-t.ts
 var import_jstat2 = __toESM(require_jstat(), 1);
+
+// src/analysis/measure.ts
+function shortfallSign(run) {
+  return run.metric.goal === "minimize" ? 1 : -1;
+}
+function splitMeasure(split) {
+  return { terms: [{ split, weight: 1 }], constant: 0 };
+}
+function perRepeat(run, measure) {
+  const sign = shortfallSign(run);
+  const columns = [];
+  for (const term of measure.terms) {
+    const split = run.splits[term.split];
+    if (split === void 0) return null;
+    columns.push({ values: split.values, weight: term.weight });
+  }
+  const repeats = run.splits.train.values.length;
+  const out = [];
+  for (let i = 0; i < repeats; i++) {
+    let total = measure.constant;
+    for (const column of columns) total += column.weight * sign * (column.values[i] ?? Number.NaN);
+    out.push(total);
+  }
+  return out;
+}
+function binomialMeasureVariance(run, measure) {
+  if (run.metric.kind !== "proportion") return null;
+  let total = 0;
+  for (const term of measure.terms) {
+    const split = run.splits[term.split];
+    if (split?.examples === void 0) return null;
+    const repeats = split.values.length;
+    total += term.weight * term.weight * binomialVariance(mean(split.values), split.examples * repeats);
+  }
+  return total;
+}
+
+// src/analysis/noise.ts
+function callOf(result, settings) {
+  const big = Math.abs(result.estimate) >= settings.minEffect && result.estimate !== 0;
+  const significant = result.p === null ? settings.minEffect > 0 : result.p < settings.alpha;
+  if (!big || !significant) return "flat";
+  return result.estimate > 0 ? "up" : "down";
+}
+function toShortfallDelta(result, settings) {
+  return { unit: "shortfall", ...deltaFields(result, settings) };
+}
+function toMetricDelta(result, settings) {
+  return { unit: "metric", ...deltaFields(result, settings) };
+}
+function deltaFields(result, settings) {
+  return {
+    estimate: result.estimate,
+    ci: result.ci,
+    p: result.p,
+    test: result.test,
+    call: callOf(result, settings)
+  };
+}
+function measureChange(baseline, candidate, measure, alpha) {
+  const b = perRepeat(baseline, measure.baseline);
+  const c = perRepeat(candidate, measure.candidate);
+  if (b === null || c === null) return null;
+  const estimate = mean(c) - mean(b);
+  if (b.length >= 2 && c.length >= 2) return welchT(b, c, alpha);
+  const vb = binomialMeasureVariance(baseline, measure.baseline);
+  const vc = binomialMeasureVariance(candidate, measure.candidate);
+  if (vb !== null && vc !== null) return normalTest(estimate, vb + vc, alpha, "z-binomial");
+  return { estimate, ci: null, p: null, test: "none" };
+}
+function measureLevel(run, measure, alpha) {
+  const values = perRepeat(run, measure);
+  if (values === null) return null;
+  const value2 = mean(values);
+  if (values.length >= 2) {
+    const t = oneSampleT(values, alpha);
+    return { value: value2, ci: t.ci, p: t.pGreater };
+  }
+  const variance = binomialMeasureVariance(run, measure);
+  if (variance !== null) {
+    const z = normalTest(value2, variance, alpha, "z-binomial");
+    const p = variance > 0 ? 1 - normalCdf(value2 / Math.sqrt(variance)) : value2 > 0 ? 0 : 1;
+    return { value: value2, ci: z.ci, p };
+  }
+  return { value: value2, ci: null, p: null };
+}
+function toMetricUnits(result, sign) {
+  if (sign === 1) return result;
+  return {
+    ...result,
+    estimate: -result.estimate,
+    ci: result.ci === null ? null : [-result.ci[1], -result.ci[0]],
+    ...result.statistic === void 0 ? {} : { statistic: -result.statistic }
+  };
+}
+
+// src/analysis/decompose.ts
+function chooseReference(run, override) {
+  if (override !== void 0) return { value: override, source: "config" };
+  if (run.reference !== void 0) return { value: run.reference, source: "artifact" };
+  if (run.metric.kind === "proportion" && run.metric.goal === "minimize")
+    return { value: 0, source: "default" };
+  return { value: null, source: "unknown" };
+}
+function componentMeasures(run, reference) {
+  const sign = shortfallSign(run);
+  const hasDev = run.splits.train_dev !== void 0;
+  return {
+    bias: reference === null ? null : { terms: [{ split: "train", weight: 1 }], constant: -sign * reference },
+    variance: {
+      terms: [
+        { split: hasDev ? "train_dev" : "validation", weight: 1 },
+        { split: "train", weight: -1 }
+      ],
+      constant: 0
+    },
+    mismatch: hasDev ? {
+      terms: [
+        { split: "validation", weight: 1 },
+        { split: "train_dev", weight: -1 }
+      ],
+      constant: 0
+    } : null,
+    overfit: run.splits.test !== void 0 ? {
+      terms: [
+        { split: "test", weight: 1 },
+        { split: "validation", weight: -1 }
+      ],
+      constant: 0
+    } : null
+  };
+}
+function errorLevel(run) {
+  const m = mean(run.splits.validation.values);
+  return Math.abs(run.metric.goal === "minimize" ? m : 1 - m);
+}
+var UNAVAILABLE = /* @__PURE__ */ new Map([
+  ["bias", "no-reference"],
+  ["mismatch", "no-train-dev"],
+  ["overfit", "no-test"]
+]);
+function decompose(run, reference, settings) {
+  const measures = componentMeasures(run, reference);
+  const threshold = Math.max(settings.gapTolerance * errorLevel(run), settings.minEffect);
+  const out = {};
+  for (const name of ["bias", "variance", "mismatch", "overfit"]) {
+    const measure = measures[name];
+    const level = measure === null ? null : measureLevel(run, measure, settings.alpha);
+    if (level === null) {
+      const unavailable = UNAVAILABLE.get(name);
+      if (unavailable === void 0) throw new Error(`${name} needs splits every run has`);
+      out[name] = { name, value: null, unavailable, ci: null, p: null, present: false };
+      continue;
+    }
+    const significant = level.p === null || level.p < settings.alpha;
+    const present = level.value > 0 && level.value >= threshold && significant;
+    out[name] = { name, value: level.value, ci: level.ci, p: level.p, present };
+  }
+  return out;
+}
+function diagnose(components) {
+  const candidates = ["bias", "variance", "mismatch"].map((name) => components[name]).filter((c) => c.present && c.value !== null).sort((a, b) => (b.value ?? 0) - (a.value ?? 0));
+  const top = candidates[0];
+  if (top === void 0) return "good-fit";
+  const bias = components.bias;
+  const variance = components.variance;
+  if (bias.present && variance.present && bias.value !== null && variance.value !== null) {
+    const ratio = Math.max(bias.value, variance.value) / Math.min(bias.value, variance.value);
+    if (ratio <= 2 && (top.name === "bias" || top.name === "variance"))
+      return "high-bias-and-variance";
+  }
+  if (top.name === "bias") return "high-bias";
+  if (top.name === "variance") return "high-variance";
+  return "data-mismatch";
+}
+
+// src/analysis/changes.ts
+function both(measure) {
+  return { baseline: measure, candidate: measure };
+}
+function pairedTest(paired, run, alpha) {
+  if (paired.rows === 0) return null;
+  if (paired.kind === "proportion") {
+    const result = mcnemarExact(
+      paired.baselineOnly ?? 0,
+      paired.candidateOnly ?? 0,
+      paired.rows,
+      alpha
+    );
+    return run.metric.goal === "minimize" ? toMetricUnits(result, -1) : result;
+  }
+  return pairedT(
+    { n: paired.rows, mean: paired.meanDiff ?? 0, variance: paired.varDiff ?? 0 },
+    alpha
+  );
+}
+function splitShortfalls(runs, alpha, paired) {
+  const pairedSplit = paired?.split ?? "validation";
+  const sign = shortfallSign(runs.candidate);
+  const out = /* @__PURE__ */ new Map();
+  for (const split of SPLIT_NAMES) {
+    let result = measureChange(runs.baseline, runs.candidate, both(splitMeasure(split)), alpha);
+    if (result === null) continue;
+    if (paired !== void 0 && split === pairedSplit && (result.test === "none" || result.test === "z-binomial")) {
+      const test = pairedTest(paired, runs.candidate, alpha);
+      if (test !== null) result = toMetricUnits(test, sign);
+    }
+    out.set(split, result);
+  }
+  return out;
+}
+function splitChanges(shortfalls, runs, summaries, calls) {
+  const sign = shortfallSign(runs.candidate);
+  const out = [];
+  for (const [split, result] of shortfalls) {
+    const b = summaries.baseline.splits.find((s) => s.split === split);
+    const c = summaries.candidate.splits.find((s) => s.split === split);
+    if (b === void 0 || c === void 0) continue;
+    out.push({
+      split,
+      baseline: b.mean,
+      candidate: c.mean,
+      delta: toMetricDelta(toMetricUnits(result, sign), calls)
+    });
+  }
+  return out;
+}
+function componentChanges(runs, references, calls) {
+  const { baseline, candidate } = runs;
+  const alpha = calls.alpha;
+  const refB = references.baseline;
+  const refC = references.candidate;
+  const [biasRefB, biasRefC] = refB !== null && refC !== null ? [refB, refC] : [0, 0];
+  const bias = measureChange(
+    baseline,
+    candidate,
+    {
+      baseline: componentMeasures(baseline, biasRefB).bias ?? splitMeasure("train"),
+      candidate: componentMeasures(candidate, biasRefC).bias ?? splitMeasure("train")
+    },
+    alpha
+  );
+  const change2 = (name) => {
+    const mb = componentMeasures(baseline, refB)[name];
+    const mc = componentMeasures(candidate, refC)[name];
+    if (mb === null || mc === null) return null;
+    const r = measureChange(baseline, candidate, { baseline: mb, candidate: mc }, alpha);
+    return r === null ? null : toShortfallDelta(r, calls);
+  };
+  const varianceFallback = baseline.splits.train_dev === void 0 !== (candidate.splits.train_dev === void 0);
+  const variance = varianceFallback ? validationMinusTrain(runs, calls) : change2("variance");
+  if (variance === null)
+    throw new Error("variance needs train and validation, which the schema requires");
+  return {
+    bias: bias === null ? null : toShortfallDelta(bias, calls),
+    variance,
+    mismatch: change2("mismatch"),
+    overfit: change2("overfit"),
+    varianceFallback
+  };
+}
+function validationMinusTrain(runs, calls) {
+  const measure = {
+    terms: [
+      { split: "validation", weight: 1 },
+      { split: "train", weight: -1 }
+    ],
+    constant: 0
+  };
+  const r = measureChange(runs.baseline, runs.candidate, both(measure), calls.alpha);
+  return r === null ? null : toShortfallDelta(r, calls);
+}
+
+// src/analysis/gate.ts
+var RULES = /* @__PURE__ */ new Map([
+  ["worse-validation", (r) => fired(r.validation.change === "worse", "worse-validation")],
+  ["toward-overfitting", (r) => fired(r.movement === "toward-overfitting", "toward-overfitting")],
+  [
+    "toward-underfitting",
+    (r) => fired(r.movement === "toward-underfitting", "toward-underfitting")
+  ],
+  ["worse-on-both", (r) => fired(r.movement === "worse-on-both", "worse-on-both")],
+  ["any-movement", (r) => fired(r.movement !== "no-significant-change", "any-movement")],
+  [
+    "slice-regression",
+    (r) => {
+      const slices2 = r.slices.filter((s) => s.change === "worse").length;
+      return slices2 > 0 ? { outcome: "slice-regression", slices: slices2 } : null;
+    }
+  ],
+  [
+    "high-bias",
+    (r) => fired(
+      r.candidate.diagnosis === "high-bias" || r.candidate.diagnosis === "high-bias-and-variance",
+      "high-bias"
+    )
+  ],
+  [
+    "high-variance",
+    (r) => fired(
+      r.candidate.diagnosis === "high-variance" || r.candidate.diagnosis === "high-bias-and-variance",
+      "high-variance"
+    )
+  ],
+  ["data-mismatch", (r) => fired(r.candidate.diagnosis === "data-mismatch", "data-mismatch")],
+  [
+    "validation-overfit",
+    (r) => fired(r.candidate.components.overfit.present, "validation-overfit")
+  ],
+  ["none", () => null]
+]);
+function fired(condition, outcome) {
+  return condition ? { outcome } : null;
+}
+function applyGate(review, failOn) {
+  const reasons = [];
+  for (const policy of failOn) {
+    const reason = RULES.get(policy)?.(review) ?? null;
+    if (reason !== null) reasons.push(reason);
+  }
+  return { pass: reasons.length === 0, reasons, failOn: [...failOn] };
+}
+
+// src/analysis/hyperparameters.ts
+function diffHyperparameters(baseline = {}, candidate = {}) {
+  const keys = [.../* @__PURE__ */ new Set([...Object.keys(baseline), ...Object.keys(candidate)])].sort();
+  const out = [];
+  for (const key of keys) {
+    const inB = Object.hasOwn(baseline, key);
+    const inC = Object.hasOwn(candidate, key);
+    const b = baseline[key];
+    const c = candidate[key];
+    if (!inB) out.push({ key, baseline: null, candidate: c, kind: "added" });
+    else if (!inC) out.push({ key, baseline: b, candidate: null, kind: "removed" });
+    else if (typeof b === "number" && typeof c === "number") {
+      if (c > b) out.push({ key, baseline: b, candidate: c, kind: "raised" });
+      else if (c < b) out.push({ key, baseline: b, candidate: c, kind: "lowered" });
+    } else if (JSON.stringify(b) !== JSON.stringify(c))
+      out.push({ key, baseline: b, candidate: c, kind: "changed" });
+  }
+  return out;
+}
+var KNOBS = [
+  [
+    /^(lambda|l2|l2_penalty|weight_decay|reg(ularization)?(_strength)?|ridge_alpha|dropout)$/i,
+    "regularization"
+  ],
+  [/^(features|num_features|n_features|feature_count)$/i, "features"],
+  [/^(polynomial_degree|poly_degree|degree|interaction_terms)$/i, "feature-richness"],
+  [/^(train_examples|training_examples|n_train|train_size|num_train)$/i, "data"],
+  [/^(epochs|max_epochs|num_epochs|iterations|max_iter|steps)$/i, "epochs"],
+  [
+    /^(hidden_units|hidden_size|layers|num_layers|depth|max_depth|width|params|parameters|model_size|n_estimators)$/i,
+    "model-size"
+  ]
+];
+function knobOf(key) {
+  for (const [pattern, knob] of KNOBS) if (pattern.test(key)) return knob;
+  return null;
+}
+var PULLED = {
+  regularization: { raised: "stronger-regularization", lowered: "weaker-regularization" },
+  features: { raised: "more-features", lowered: "fewer-features" },
+  "feature-richness": { raised: "richer-features", lowered: "fewer-features" },
+  data: { raised: "more-data", lowered: "more-data" },
+  epochs: { raised: "train-longer", lowered: "early-stopping" },
+  "model-size": { raised: "bigger-model", lowered: "smaller-model" }
+};
+function pulledLevers(changes) {
+  const out = [];
+  for (const change2 of changes) {
+    if (change2.kind !== "raised" && change2.kind !== "lowered") continue;
+    const knob = knobOf(change2.key);
+    if (knob === null) continue;
+    if (knob === "data" && change2.kind === "lowered") continue;
+    out.push({ lever: PULLED[knob][change2.kind], change: change2, knob });
+  }
+  return out;
+}
+
+// src/analysis/levers/context.ts
+function curveEvidence(curves) {
+  const analysed = (c) => c === void 0 || "skipped" in c ? null : c;
+  return {
+    learning: analysed(curves.training_examples),
+    sweep: analysed(curves.regularization),
+    epochs: analysed(curves.epochs)
+  };
+}
+var Drafts = class {
+  #byId = /* @__PURE__ */ new Map();
+  add(id, score, evidence, suggestion) {
+    const existing = this.#byId.get(id);
+    if (existing !== void 0 && existing.score >= score) return;
+    this.#byId.set(id, {
+      id,
+      score,
+      ...suggestion === void 0 ? {} : { suggestion },
+      evidence
+    });
+  }
+  has(id) {
+    return this.#byId.has(id);
+  }
+  /** Highest score first; drafts with equal scores keep the order they were first drafted in. */
+  ranked() {
+    return [...this.#byId.values()].sort((a, b) => b.score - a.score);
+  }
+};
+function between(from, to) {
+  return from > 0 && to > 0 ? Math.sqrt(from * to) : (from + to) / 2;
+}
+function savedByStopping(e, goal) {
+  const sign = goal === "minimize" ? 1 : -1;
+  return Math.max(0, sign * (e.finalValidation - e.bestValidation));
+}
+function epochMinimum(e, goal) {
+  return {
+    kind: "epoch-minimum",
+    epoch: e.bestX,
+    of: e.finalX,
+    saves: savedByStopping(e, goal),
+    gl: e.gl
+  };
+}
+
+// src/analysis/levers/catalogue.ts
+var BY_TARGET = {
+  variance: [
+    "more-data",
+    "stronger-regularization",
+    "fewer-features",
+    "early-stopping",
+    "smaller-model"
+  ],
+  bias: [
+    "richer-features",
+    "more-features",
+    "weaker-regularization",
+    "bigger-model",
+    "train-longer"
+  ]
+};
+
+// src/analysis/levers/scores.ts
+var REVERSE_OWN_CHANGE = 100;
+var COUNTER_WITH_SWEEP = 95;
+var STEP_BACK_CAPACITY = 90;
+var COUNTER_WITHOUT_SWEEP = 85;
+var DIAGNOSIS_BASE = 60;
+var SECOND_TARGET_STEP = 20;
+var CATALOGUE_STEP = 2;
+var GAP_CLOSING_BONUS = 8;
+var GAP_FLAT_PENALTY = 25;
+var SWEEP_AGREES_BONUS = 10;
+var SWEEP_DISAGREES_PENALTY = 20;
+var EPOCH_CONFIRMED_BONUS = 12;
+var EPOCH_UNCONFIRMED_PENALTY = 15;
+var NOTHING_TO_WEAKEN_PENALTY = 10;
+var ALREADY_PULLED_PENALTY = 30;
+var EPOCH_CURVE_ALONE = 35;
+var MISMATCH_DIAGNOSED = 70;
+var MISMATCH_PRESENT = 30;
+var VALIDATION_OVERFIT = 40;
+var SUPPLY_REFERENCE = 20;
+var ADD_REPEATS = 15;
+
+// src/analysis/levers/own-change.ts
+var CAPACITY_LEVERS = /* @__PURE__ */ new Set([
+  "richer-features",
+  "more-features",
+  "bigger-model"
+]);
+function numericChange(p) {
+  return {
+    hyperparameter: p.change.key,
+    from: Number(p.change.baseline),
+    to: Number(p.change.candidate),
+    direction: p.change.kind === "lowered" ? "lowered" : "raised"
+  };
+}
+function ownChangeLevers(ctx, curves, drafts) {
+  const towardBias = ctx.movement === "toward-underfitting" || ctx.movement === "worse-on-both";
+  const towardVariance = ctx.movement === "toward-overfitting" || ctx.movement === "worse-on-both";
+  const biasChange = {
+    kind: "component-change",
+    component: "bias",
+    delta: ctx.bias
+  };
+  const varianceChange = {
+    kind: "component-change",
+    component: "variance",
+    delta: ctx.variance
+  };
+  for (const p of ctx.pulled) {
+    const { baseline: from, candidate: to, key } = p.change;
+    if (typeof from !== "number" || typeof to !== "number") continue;
+    const change2 = { kind: "pr-change", ...numericChange(p) };
+    const midway = {
+      hyperparameter: key,
+      value: between(from, to),
+      basis: "between-old-and-new"
+    };
+    if (p.lever === "stronger-regularization" && towardBias) {
+      drafts.add("weaker-regularization", REVERSE_OWN_CHANGE, [change2, biasChange], midway);
+    }
+    if (p.lever === "weaker-regularization" && towardVariance) {
+      drafts.add("stronger-regularization", REVERSE_OWN_CHANGE, [change2, varianceChange], midway);
+    }
+    if (CAPACITY_LEVERS.has(p.lever) && towardVariance) {
+      const back = p.lever === "bigger-model" ? "smaller-model" : "fewer-features";
+      drafts.add(back, STEP_BACK_CAPACITY, [change2, varianceChange], midway);
+      counterCapacity(ctx, curves, drafts, [change2, varianceChange]);
+    }
+  }
+}
+function counterCapacity(ctx, curves, drafts, evidence) {
+  const sweep = curves.sweep;
+  if (sweep === null || sweep.side !== "below") {
+    drafts.add("stronger-regularization", COUNTER_WITHOUT_SWEEP, evidence);
+    return;
+  }
+  const key = ctx.regularization?.key;
+  drafts.add(
+    "stronger-regularization",
+    COUNTER_WITH_SWEEP,
+    [
+      ...evidence,
+      {
+        kind: "sweep-minimum",
+        hyperparameter: key ?? null,
+        bestX: sweep.bestX,
+        bestValidation: sweep.bestValidation,
+        current: ctx.regularization?.value ?? null,
+        suggestedX: sweep.suggestedX,
+        side: sweep.side,
+        supports: true,
+        atEdge: sweep.atEdge
+      }
+    ],
+    key === void 0 ? void 0 : sweepSuggestion(key, sweep)
+  );
+}
+function sweepSuggestion(key, sweep) {
+  return {
+    hyperparameter: key,
+    value: sweep.suggestedX,
+    basis: sweep.atEdge === null ? "sweep-minimum" : "beyond-sweep-edge"
+  };
+}
+
+// src/analysis/levers/diagnosis.ts
+function targets(diagnosis, run) {
+  const b = run.components.bias.value ?? 0;
+  const v = run.components.variance.value ?? 0;
+  switch (diagnosis) {
+    case "high-variance":
+      return ["variance"];
+    case "high-bias":
+      return ["bias"];
+    case "high-bias-and-variance":
+      return b >= v ? ["bias", "variance"] : ["variance", "bias"];
+    default:
+      return [];
+  }
+}
+function diagnosisLevers(ctx, curves, drafts) {
+  const pulled = new Map(ctx.pulled.map((p) => [p.lever, p]));
+  targets(ctx.candidate.diagnosis, ctx.candidate).forEach((target, t) => {
+    const component = ctx.candidate.components[target];
+    const base = component.value === null ? [] : [
+      {
+        kind: "diagnosis",
+        component: target,
+        value: component.value,
+        errorLevel: ctx.candidate.errorLevel
+      }
+    ];
+    BY_TARGET[target].forEach((id, i) => {
+      const draft = {
+        score: DIAGNOSIS_BASE - t * SECOND_TARGET_STEP - i * CATALOGUE_STEP,
+        evidence: [...base]
+      };
+      sharpen(id, draft, ctx, curves);
+      const p = pulled.get(id);
+      if (p !== void 0) {
+        draft.score -= ALREADY_PULLED_PENALTY;
+        draft.evidence.push({ kind: "already-pulled", ...numericChange(p) });
+      }
+      drafts.add(id, draft.score, draft.evidence, draft.suggestion);
+    });
+  });
+}
+function sharpen(id, draft, ctx, curves) {
+  if (id === "more-data" && curves.learning !== null) {
+    const lc = curves.learning;
+    const twice = lc.projections[0];
+    if (twice !== void 0) {
+      draft.evidence.push({
+        kind: "learning-curve",
+        fromX: Math.max(...lc.chart.map((p) => p.x)),
+        atX: twice.x,
+        current: ctx.candidate.splits.find((s) => s.split === "validation")?.mean ?? 0,
+        projected: twice.validation,
+        ci: twice.ci,
+        r2: lc.r2
+      });
+    }
+    if (lc.gapTrend === "flat") {
+      draft.score -= GAP_FLAT_PENALTY;
+      draft.evidence.push({ kind: "gap-trend", trend: "flat" });
+    } else if (lc.gapTrend === "closing") {
+      draft.score += GAP_CLOSING_BONUS;
+      draft.evidence.push({ kind: "gap-trend", trend: "closing" });
+    }
+  }
+  if ((id === "stronger-regularization" || id === "weaker-regularization") && curves.sweep !== null) {
+    sharpenBySweep(id, draft, ctx, curves.sweep);
+  }
+  const epochs = curves.epochs;
+  if (id === "early-stopping") {
+    if (epochs !== null && epochs.stoppedLate) {
+      draft.score += EPOCH_CONFIRMED_BONUS;
+      draft.evidence.push(epochMinimum(epochs, ctx.goal));
+    } else {
+      draft.score -= EPOCH_UNCONFIRMED_PENALTY;
+      draft.evidence.push({ kind: "epoch-curve-silent", curve: epochs !== null });
+    }
+  }
+  if (id === "train-longer") {
+    if (epochs !== null && epochs.stoppedEarly) {
+      draft.score += EPOCH_CONFIRMED_BONUS;
+      draft.evidence.push({ kind: "still-improving", epoch: epochs.finalX });
+    } else {
+      draft.score -= EPOCH_UNCONFIRMED_PENALTY;
+      draft.evidence.push({ kind: "epoch-curve-silent", curve: epochs !== null });
+    }
+  }
+  if (id === "weaker-regularization" && ctx.regularization === void 0 && curves.sweep === null) {
+    draft.score -= NOTHING_TO_WEAKEN_PENALTY;
+  }
+}
+function sharpenBySweep(id, draft, ctx, sweep) {
+  const wants = id === "stronger-regularization" ? "below" : "above";
+  const supports = sweep.side === "unknown" ? null : sweep.side === wants;
+  if (supports === null && sweep.atEdge === null) return;
+  const key = ctx.regularization?.key;
+  draft.evidence.push({
+    kind: "sweep-minimum",
+    hyperparameter: key ?? null,
+    bestX: sweep.bestX,
+    bestValidation: sweep.bestValidation,
+    current: ctx.regularization?.value ?? null,
+    suggestedX: sweep.suggestedX,
+    side: sweep.side,
+    supports,
+    atEdge: sweep.atEdge
+  });
+  if (supports === true) {
+    draft.score += SWEEP_AGREES_BONUS;
+    if (key !== void 0) draft.suggestion = sweepSuggestion(key, sweep);
+  } else if (supports === false) draft.score -= SWEEP_DISAGREES_PENALTY;
+}
+
+// src/analysis/levers/secondary.ts
+function secondaryLevers(ctx, curves, drafts) {
+  const epochs = curves.epochs;
+  const { candidate } = ctx;
+  if (epochs !== null && epochs.stoppedLate && !drafts.has("early-stopping")) {
+    drafts.add("early-stopping", EPOCH_CURVE_ALONE, [epochMinimum(epochs, ctx.goal)]);
+  }
+  if (epochs !== null && epochs.stoppedEarly && !drafts.has("train-longer")) {
+    drafts.add("train-longer", EPOCH_CURVE_ALONE, [
+      { kind: "still-improving", epoch: epochs.finalX }
+    ]);
+  }
+  const mismatch = candidate.components.mismatch;
+  if (candidate.diagnosis === "data-mismatch" || mismatch.present) {
+    drafts.add(
+      "align-training-data",
+      candidate.diagnosis === "data-mismatch" ? MISMATCH_DIAGNOSED : MISMATCH_PRESENT,
+      [
+        {
+          kind: "diagnosis",
+          component: "mismatch",
+          value: mismatch.value ?? 0,
+          errorLevel: candidate.errorLevel
+        }
+      ]
+    );
+  }
+  const overfit = candidate.components.overfit;
+  if (overfit.present) {
+    drafts.add("bigger-validation-set", VALIDATION_OVERFIT, [
+      {
+        kind: "diagnosis",
+        component: "overfit",
+        value: overfit.value ?? 0,
+        errorLevel: candidate.errorLevel
+      }
+    ]);
+  }
+  if (candidate.biasUnknown) {
+    drafts.add("supply-reference", SUPPLY_REFERENCE, [{ kind: "reference-missing" }]);
+  }
+  if (ctx.noiseUnknown) {
+    drafts.add("add-repeats", ADD_REPEATS, [{ kind: "noise-unknown" }]);
+  }
+}
+
+// src/analysis/levers/choose.ts
+function chooseLevers(ctx) {
+  const curves = curveEvidence(ctx.candidate.curves);
+  const drafts = new Drafts();
+  ownChangeLevers(ctx, curves, drafts);
+  diagnosisLevers(ctx, curves, drafts);
+  secondaryLevers(ctx, curves, drafts);
+  return { levers: drafts.ranked(), nonLevers: nonLevers(ctx) };
+}
+function nonLevers(ctx) {
+  const biased = ctx.candidate.diagnosis === "high-bias" || ctx.candidate.diagnosis === "high-bias-and-variance";
+  const shrank = ctx.changes.some((c) => c.kind === "lowered" && knobOf(c.key) === "data");
+  return biased || shrank ? ["smaller-training-set"] : [];
+}
+
+// src/analysis/movement.ts
+var TABLE = {
+  down: { down: "better-on-both", flat: "away-from-underfitting", up: "toward-overfitting" },
+  flat: { down: "away-from-overfitting", flat: "no-significant-change", up: "toward-overfitting" },
+  up: { down: "toward-underfitting", flat: "toward-underfitting", up: "worse-on-both" }
+};
+function movementOf(biasCall, varianceCall) {
+  return TABLE[biasCall][varianceCall];
+}
+function validationChangeOf(shortfallCall) {
+  return shortfallCall === "up" ? "worse" : shortfallCall === "down" ? "better" : "flat";
+}
 
 // src/analysis/curves/early-stopping.ts
 var STRIP = 5;
@@ -20743,10 +21476,10 @@ function gapTrend(points) {
   if (Math.abs(meanGap) <= RELATIVE_CHANGE * Math.abs(meanV)) {
     return { trend: "flat", changePerDoubling: meanGap !== 0 ? sxy / sxx / Math.abs(meanGap) : 0 };
   }
-  const change = sxy / sxx / Math.abs(meanGap);
-  if (change <= -RELATIVE_CHANGE) return { trend: "closing", changePerDoubling: change };
-  if (change < RELATIVE_CHANGE) return { trend: "flat", changePerDoubling: change };
-  return { trend: "unknown", changePerDoubling: change };
+  const change2 = sxy / sxx / Math.abs(meanGap);
+  if (change2 <= -RELATIVE_CHANGE) return { trend: "closing", changePerDoubling: change2 };
+  if (change2 < RELATIVE_CHANGE) return { trend: "flat", changePerDoubling: change2 };
+  return { trend: "unknown", changePerDoubling: change2 };
 }
 
 // src/analysis/curves/lttb.ts
@@ -21089,11 +21822,11 @@ function verdict(problem2, p, state, iterations, stop, lower, upper, evaluate, j
       q[j] = Math.min(Math.max(v, lower[j]), upper[j]);
       return evaluate(q).rss;
     };
-    const change = Math.max(
+    const change2 = Math.max(
       Math.abs(probe(pj + h) - state.rss),
       Math.abs(probe(pj - h) - state.rss)
     );
-    return !(change > 1e-12 * state.rss);
+    return !(change2 > 1e-12 * state.rss);
   });
   const scaled = jac.map(
     (row) => free.map((j) => norms[j] > 0 ? row[j] / norms[j] : 0)
@@ -21266,7 +21999,7 @@ var MIN_REGULARIZATION_POINTS = 3;
 function regularizationMinimum(x, validationError, lambda) {
   const n = x.length;
   if (n < MIN_REGULARIZATION_POINTS) {
-    return { skipped: `needs at least ${MIN_REGULARIZATION_POINTS} points, has ${n}` };
+    return { skipped: "too-few-points", points: n, needs: MIN_REGULARIZATION_POINTS };
   }
   let i = 0;
   validationError.forEach((v, j) => {
@@ -21290,10 +22023,10 @@ function regularizationMinimum(x, validationError, lambda) {
     const [x0, x1, x2] = [lx[i - 1], lx[i], lx[i + 1]];
     const [y0, y1, y2] = [validationError[i - 1], validationError[i], validationError[i + 1]];
     step = (x2 - x0) / 2;
-    const num2 = (x1 - x0) ** 2 * (y1 - y2) - (x1 - x2) ** 2 * (y1 - y0);
+    const num = (x1 - x0) ** 2 * (y1 - y2) - (x1 - x2) ** 2 * (y1 - y0);
     const den = (x1 - x0) * (y1 - y2) - (x1 - x2) * (y1 - y0);
     if (den !== 0) {
-      logBest = x1 - num2 / (2 * den);
+      logBest = x1 - num / (2 * den);
       refined = true;
     }
     suggestedX = Math.exp(logBest);
@@ -21308,6 +22041,7 @@ function regularizationMinimum(x, validationError, lambda) {
 }
 
 // src/analysis/curves/index.ts
+var MIN_EPOCH_POINTS = 2;
 var CHART_POINTS = 60;
 function analyzeCurves(curves, context) {
   const report = {};
@@ -21341,7 +22075,8 @@ function chart(points, scale, keep) {
   });
 }
 function analyzeEpochs(points, scale) {
-  if (points.length < 2) return { skipped: `needs at least 2 points, has ${points.length}` };
+  if (points.length < MIN_EPOCH_POINTS)
+    return { skipped: "too-few-points", points: points.length, needs: MIN_EPOCH_POINTS };
   const validation = points.map((p) => scale.toError(p.validation));
   const hasTrain = points.every((p) => p.train !== void 0);
   const train = hasTrain ? points.map((p) => scale.toError(p.train)) : null;
@@ -21369,8 +22104,14 @@ function analyzeEpochs(points, scale) {
 function analyzeLearningCurve(points, scale) {
   const m = points.map((p) => p.x);
   const e = points.map((p) => scale.toError(p.validation));
+  const tooFew = {
+    skipped: "too-few-points",
+    points: m.length,
+    needs: MIN_POWER_LAW_POINTS
+  };
+  if (m.length < MIN_POWER_LAW_POINTS) return tooFew;
   const fit = fitPowerLaw(m, e, { lower: scale.lower, upper: scale.upper });
-  if ("skipped" in fit) return fit;
+  if ("skipped" in fit) return { ...tooFew, skipped: "fit-failed" };
   const gap = gapTrend(
     points.map(
       (p) => p.train === void 0 ? { x: p.x, validationError: scale.toError(p.validation) } : {
@@ -21420,544 +22161,51 @@ function analyzeRegularization(points, scale, lambda) {
   };
 }
 
-// src/analysis/measure.ts
-function shortfallSign(run) {
-  return run.metric.goal === "minimize" ? 1 : -1;
-}
-function splitMeasure(split) {
-  return { terms: [{ split, weight: 1 }], constant: 0 };
-}
-function perRepeat(run, measure) {
-  const sign = shortfallSign(run);
-  const columns = [];
-  for (const term of measure.terms) {
-    const split = run.splits[term.split];
-    if (split === void 0) return null;
-    columns.push({ values: split.values, weight: term.weight });
+// src/analysis/run-summary.ts
+function splitSummary(run, split, alpha) {
+  const s = run.splits[split];
+  if (s === void 0) return null;
+  const m = mean(s.values);
+  const n = s.values.length;
+  const sd = n >= 2 ? Math.sqrt(sampleVariance(s.values)) : null;
+  let ci = null;
+  if (sd !== null) {
+    const half = tQuantile(1 - alpha / 2, n - 1) * (sd / Math.sqrt(n));
+    ci = [m - half, m + half];
+  } else if (run.metric.kind === "proportion" && s.examples !== void 0) {
+    ci = wilsonInterval(Math.round(m * s.examples), s.examples, alpha);
   }
-  const repeats = run.splits.train.values.length;
-  const out = [];
-  for (let i = 0; i < repeats; i++) {
-    let total = measure.constant;
-    for (const column of columns) total += column.weight * sign * (column.values[i] ?? Number.NaN);
-    out.push(total);
+  return { split, mean: m, sd, repeats: n, examples: s.examples ?? null, ci };
+}
+function regularizationOf(run) {
+  for (const [key, value2] of Object.entries(run.hyperparameters ?? {})) {
+    if (typeof value2 === "number" && knobOf(key) === "regularization" && !/dropout/i.test(key))
+      return { key, value: value2 };
   }
-  return out;
+  return void 0;
 }
-function binomialMeasureVariance(run, measure) {
-  if (run.metric.kind !== "proportion") return null;
-  let total = 0;
-  for (const term of measure.terms) {
-    const split = run.splits[term.split];
-    if (split?.examples === void 0) return null;
-    const repeats = split.values.length;
-    total += term.weight * term.weight * binomialVariance(mean(split.values), split.examples * repeats);
-  }
-  return total;
-}
-
-// src/analysis/noise.ts
-function callOf(result, settings) {
-  const big = Math.abs(result.estimate) >= settings.minEffect && result.estimate !== 0;
-  const significant = result.p === null ? settings.minEffect > 0 : result.p < settings.alpha;
-  if (!big || !significant) return "flat";
-  return result.estimate > 0 ? "up" : "down";
-}
-function toDelta(result, settings) {
+function summarize(run, settings) {
+  const reference = chooseReference(run, settings.reference);
+  const components = decompose(run, reference.value, settings);
+  const lambda = regularizationOf(run)?.value;
   return {
-    estimate: result.estimate,
-    ci: result.ci,
-    p: result.p,
-    test: result.test,
-    call: callOf(result, settings)
+    name: run.run.name,
+    commit: run.run.commit ?? null,
+    createdAt: run.run.createdAt ?? null,
+    reference: reference.value,
+    referenceSource: reference.source,
+    splits: SPLIT_NAMES.flatMap((s) => splitSummary(run, s, settings.alpha) ?? []),
+    errorLevel: errorLevel(run),
+    components,
+    diagnosis: diagnose(components),
+    biasUnknown: reference.value === null,
+    warnings: components.overfit.present ? ["validation-overfit"] : [],
+    curves: analyzeCurves(run.curves, {
+      ...lambda === void 0 ? {} : { lambda },
+      kind: run.metric.kind,
+      goal: run.metric.goal
+    })
   };
-}
-function measureChange(baseline, candidate, measure, alpha) {
-  const b = perRepeat(baseline, measure.baseline);
-  const c = perRepeat(candidate, measure.candidate);
-  if (b === null || c === null) return null;
-  const estimate = mean(c) - mean(b);
-  if (b.length >= 2 && c.length >= 2) return welchT(b, c, alpha);
-  const vb = binomialMeasureVariance(baseline, measure.baseline);
-  const vc = binomialMeasureVariance(candidate, measure.candidate);
-  if (vb !== null && vc !== null) return normalTest(estimate, vb + vc, alpha, "z-binomial");
-  return { estimate, ci: null, p: null, test: "none" };
-}
-function measureLevel(run, measure, alpha) {
-  const values = perRepeat(run, measure);
-  if (values === null) return null;
-  const value = mean(values);
-  if (values.length >= 2) {
-    const t = oneSampleT(values, alpha);
-    return { value, ci: t.ci, p: t.pGreater };
-  }
-  const variance = binomialMeasureVariance(run, measure);
-  if (variance !== null) {
-    const z = normalTest(value, variance, alpha, "z-binomial");
-    const p = variance > 0 ? 1 - normalCdf(value / Math.sqrt(variance)) : value > 0 ? 0 : 1;
-    return { value, ci: z.ci, p };
-  }
-  return { value, ci: null, p: null };
-}
-function toMetricUnits(result, sign) {
-  if (sign === 1) return result;
-  return {
-    ...result,
-    estimate: -result.estimate,
-    ci: result.ci === null ? null : [-result.ci[1], -result.ci[0]],
-    ...result.statistic === void 0 ? {} : { statistic: -result.statistic }
-  };
-}
-
-// src/analysis/decompose.ts
-function chooseReference(run, override) {
-  if (override !== void 0) return { value: override, source: "config" };
-  if (run.reference !== void 0) return { value: run.reference, source: "artifact" };
-  if (run.metric.kind === "proportion" && run.metric.goal === "minimize")
-    return { value: 0, source: "default" };
-  return { value: null, source: "unknown" };
-}
-function componentMeasures(run, reference) {
-  const sign = shortfallSign(run);
-  const hasDev = run.splits.train_dev !== void 0;
-  return {
-    bias: reference === null ? null : { terms: [{ split: "train", weight: 1 }], constant: -sign * reference },
-    variance: {
-      terms: [
-        { split: hasDev ? "train_dev" : "validation", weight: 1 },
-        { split: "train", weight: -1 }
-      ],
-      constant: 0
-    },
-    mismatch: hasDev ? {
-      terms: [
-        { split: "validation", weight: 1 },
-        { split: "train_dev", weight: -1 }
-      ],
-      constant: 0
-    } : null,
-    overfit: run.splits.test !== void 0 ? {
-      terms: [
-        { split: "test", weight: 1 },
-        { split: "validation", weight: -1 }
-      ],
-      constant: 0
-    } : null
-  };
-}
-function errorLevel(run) {
-  const m = mean(run.splits.validation.values);
-  return Math.abs(run.metric.goal === "minimize" ? m : 1 - m);
-}
-var UNAVAILABLE = {
-  bias: 'No reference level: give "reference" in the artifact or the config (human-level error, a prior system, or an estimated Bayes error).',
-  variance: "Needs train and validation values.",
-  mismatch: "Needs a train_dev split (held-out data from the training distribution).",
-  overfit: "Needs a test split."
-};
-function decompose(run, reference, settings) {
-  const measures = componentMeasures(run, reference);
-  const threshold = Math.max(settings.gapTolerance * errorLevel(run), settings.minEffect);
-  const out = {};
-  for (const name of ["bias", "variance", "mismatch", "overfit"]) {
-    const measure = measures[name];
-    const level = measure === null ? null : measureLevel(run, measure, settings.alpha);
-    if (level === null) {
-      out[name] = {
-        name,
-        value: null,
-        unavailable: UNAVAILABLE[name],
-        ci: null,
-        p: null,
-        present: false
-      };
-      continue;
-    }
-    const significant = level.p === null || level.p < settings.alpha;
-    const present = level.value > 0 && level.value >= threshold && significant;
-    out[name] = { name, value: level.value, ci: level.ci, p: level.p, present };
-  }
-  return out;
-}
-function diagnose(components) {
-  const candidates = ["bias", "variance", "mismatch"].map((name) => components[name]).filter((c) => c.present && c.value !== null).sort((a, b) => (b.value ?? 0) - (a.value ?? 0));
-  const top = candidates[0];
-  if (top === void 0) return "good-fit";
-  const bias = components.bias;
-  const variance = components.variance;
-  if (bias.present && variance.present && bias.value !== null && variance.value !== null) {
-    const ratio = Math.max(bias.value, variance.value) / Math.min(bias.value, variance.value);
-    if (ratio <= 2 && (top.name === "bias" || top.name === "variance"))
-      return "high-bias-and-variance";
-  }
-  if (top.name === "bias") return "high-bias";
-  if (top.name === "variance") return "high-variance";
-  return "data-mismatch";
-}
-
-// src/analysis/format.ts
-function formatValue(value, kind) {
-  if (kind === "proportion") return `${(value * 100).toFixed(Math.abs(value) < 1e-3 ? 2 : 1)}%`;
-  return formatNumber(value);
-}
-function formatChange(value, kind) {
-  const sign = value > 0 ? "+" : value < 0 ? "\u2212" : "\xB1";
-  const magnitude = Math.abs(value);
-  if (kind === "proportion")
-    return `${sign}${(magnitude * 100).toFixed(magnitude < 1e-3 ? 2 : 1)} pts`;
-  return `${sign}${formatNumber(magnitude)}`;
-}
-function formatNumber(value) {
-  if (value === 0) return "0";
-  const abs = Math.abs(value);
-  if (abs >= 1e5 || abs < 1e-3) return value.toExponential(2);
-  return Number(value.toPrecision(4)).toString();
-}
-function formatP(p) {
-  if (p === null) return "n/a";
-  return p < 1e-3 ? "< 0.001" : p.toFixed(3);
-}
-
-// src/analysis/gate.ts
-var RULES = {
-  "worse-validation": (r) => r.validation.change === "worse" ? "validation got significantly worse" : null,
-  "toward-overfitting": (r) => r.movement === "toward-overfitting" ? "the change moved toward overfitting" : null,
-  "toward-underfitting": (r) => r.movement === "toward-underfitting" ? "the change moved toward underfitting" : null,
-  "worse-on-both": (r) => r.movement === "worse-on-both" ? "bias and variance both got worse" : null,
-  "any-movement": (r) => r.movement !== "no-significant-change" ? `the model moved (${r.movement})` : null,
-  "slice-regression": (r) => {
-    const worse = r.slices.filter((s) => s.change === "worse");
-    return worse.length > 0 ? `${worse.length} slice(s) regressed significantly` : null;
-  },
-  "high-bias": (r) => r.candidate.diagnosis === "high-bias" || r.candidate.diagnosis === "high-bias-and-variance" ? "the candidate has high bias" : null,
-  "high-variance": (r) => r.candidate.diagnosis === "high-variance" || r.candidate.diagnosis === "high-bias-and-variance" ? "the candidate has high variance" : null,
-  "data-mismatch": (r) => r.candidate.diagnosis === "data-mismatch" ? "the candidate shows data mismatch" : null,
-  "validation-overfit": (r) => r.candidate.components.overfit.present ? "the candidate overfits the validation set (test error well above validation)" : null,
-  none: () => null
-};
-function applyGate(review) {
-  const failOn = review.settings.failOn;
-  const reasons = [];
-  for (const policy of failOn) {
-    const reason = RULES[policy]?.(review) ?? null;
-    if (reason !== null) reasons.push(`${policy}: ${reason}`);
-  }
-  return { pass: reasons.length === 0, reasons, failOn: [...failOn] };
-}
-
-// src/analysis/hyperparameters.ts
-function diffHyperparameters(baseline = {}, candidate = {}) {
-  const keys = [.../* @__PURE__ */ new Set([...Object.keys(baseline), ...Object.keys(candidate)])].sort();
-  const out = [];
-  for (const key of keys) {
-    const inB = Object.hasOwn(baseline, key);
-    const inC = Object.hasOwn(candidate, key);
-    const b = baseline[key];
-    const c = candidate[key];
-    if (!inB) out.push({ key, baseline: null, candidate: c, kind: "added" });
-    else if (!inC) out.push({ key, baseline: b, candidate: null, kind: "removed" });
-    else if (typeof b === "number" && typeof c === "number") {
-      if (c > b) out.push({ key, baseline: b, candidate: c, kind: "raised" });
-      else if (c < b) out.push({ key, baseline: b, candidate: c, kind: "lowered" });
-    } else if (JSON.stringify(b) !== JSON.stringify(c))
-      out.push({ key, baseline: b, candidate: c, kind: "changed" });
-  }
-  return out;
-}
-var KNOBS = [
-  [
-    /^(lambda|l2|l2_penalty|weight_decay|reg(ularization)?(_strength)?|ridge_alpha|dropout)$/i,
-    "regularization"
-  ],
-  [/^(features|num_features|n_features|feature_count)$/i, "features"],
-  [/^(polynomial_degree|poly_degree|degree|interaction_terms)$/i, "feature-richness"],
-  [/^(train_examples|training_examples|n_train|train_size|num_train)$/i, "data"],
-  [/^(epochs|max_epochs|num_epochs|iterations|max_iter|steps)$/i, "epochs"],
-  [
-    /^(hidden_units|hidden_size|layers|num_layers|depth|max_depth|width|params|parameters|model_size|n_estimators)$/i,
-    "model-size"
-  ]
-];
-function knobOf(key) {
-  for (const [pattern, knob] of KNOBS) if (pattern.test(key)) return knob;
-  return null;
-}
-var PULLED = {
-  regularization: { raised: "stronger-regularization", lowered: "weaker-regularization" },
-  features: { raised: "more-features", lowered: "fewer-features" },
-  "feature-richness": { raised: "richer-features", lowered: "fewer-features" },
-  data: { raised: "more-data", lowered: "more-data" },
-  epochs: { raised: "train-longer", lowered: "early-stopping" },
-  "model-size": { raised: "bigger-model", lowered: "smaller-model" }
-};
-function pulledLevers(changes) {
-  const out = [];
-  for (const change of changes) {
-    if (change.kind !== "raised" && change.kind !== "lowered") continue;
-    const knob = knobOf(change.key);
-    if (knob === null) continue;
-    if (knob === "data" && change.kind === "lowered") continue;
-    out.push({ lever: PULLED[knob][change.kind], change, knob });
-  }
-  return out;
-}
-
-// src/analysis/levers/choose.ts
-var LEVER_CATALOGUE = {
-  "more-data": { addresses: "variance", meaning: "train on more examples" },
-  "fewer-features": { addresses: "variance", meaning: "drop weak or redundant features" },
-  "stronger-regularization": {
-    addresses: "variance",
-    meaning: "raise the regularization strength"
-  },
-  "smaller-model": { addresses: "variance", meaning: "reduce model capacity" },
-  "early-stopping": { addresses: "variance", meaning: "stop at the validation minimum" },
-  "more-features": { addresses: "bias", meaning: "add informative features" },
-  "richer-features": { addresses: "bias", meaning: "add polynomial or interaction terms" },
-  "weaker-regularization": { addresses: "bias", meaning: "lower the regularization strength" },
-  "bigger-model": { addresses: "bias", meaning: "increase model capacity" },
-  "train-longer": { addresses: "bias", meaning: "train for more epochs" },
-  "align-training-data": {
-    addresses: "mismatch",
-    meaning: "make training data look like validation data"
-  },
-  "bigger-validation-set": {
-    addresses: "validation-overfit",
-    meaning: "enlarge or refresh the validation set"
-  },
-  "add-repeats": { addresses: "evidence", meaning: "repeat training with other seeds" },
-  "supply-reference": { addresses: "evidence", meaning: "give a reference level" }
-};
-var BY_TARGET = {
-  variance: [
-    "more-data",
-    "stronger-regularization",
-    "fewer-features",
-    "early-stopping",
-    "smaller-model"
-  ],
-  bias: [
-    "richer-features",
-    "more-features",
-    "weaker-regularization",
-    "bigger-model",
-    "train-longer"
-  ]
-};
-var SMALLER_TRAINING_SET_NOTE = "A smaller training set is not a cure for high bias: it only lowers the training error, while validation error stays high or rises.";
-function learning(curves) {
-  const c = curves.training_examples;
-  return c !== void 0 && !("skipped" in c) ? c : null;
-}
-function regularization(curves) {
-  const c = curves.regularization;
-  return c !== void 0 && !("skipped" in c) ? c : null;
-}
-function epochs(curves) {
-  const c = curves.epochs;
-  return c !== void 0 && !("skipped" in c) ? c : null;
-}
-function targets(diagnosis, run) {
-  const b = run.components.bias.value ?? 0;
-  const v = run.components.variance.value ?? 0;
-  switch (diagnosis) {
-    case "high-variance":
-      return ["variance"];
-    case "high-bias":
-      return ["bias"];
-    case "high-bias-and-variance":
-      return b >= v ? ["bias", "variance"] : ["variance", "bias"];
-    default:
-      return [];
-  }
-}
-function chooseLevers(ctx) {
-  const { kind } = ctx;
-  const v = (x) => formatValue(x, kind);
-  const curves = ctx.candidate.curves;
-  const drafts = /* @__PURE__ */ new Map();
-  const add2 = (id, score, reason, evidence = []) => {
-    const existing = drafts.get(id);
-    if (existing === void 0 || existing.score < score)
-      drafts.set(id, { id, reason, evidence, score });
-  };
-  const pulled = new Map(ctx.pulled.map((p) => [p.lever, p]));
-  const pulledNote = (id) => {
-    const p = pulled.get(id);
-    if (p === void 0) return null;
-    return `this PR already ${p.change.kind} ${p.change.key} (${String(p.change.baseline)} \u2192 ${String(p.change.candidate)})`;
-  };
-  const lc = learning(curves);
-  const reg = regularization(curves);
-  const ep = epochs(curves);
-  const stopEarlierReason = (e) => `Validation minimum at epoch ${formatNumber(e.bestX)} of ${formatNumber(e.finalX)}; stopping there saves ${formatChange(e.finalValidation - e.bestValidation, kind).replace(/^\+/, "")}${e.gl === null ? "" : ` (generalization loss ${e.gl.toFixed(1)}%)`}.`;
-  const trainLongerReason = (e) => `Train and validation ${ctx.metricName} were both still falling at epoch ${formatNumber(e.finalX)}: train longer.`;
-  for (const p of ctx.pulled) {
-    const { baseline: from, candidate: to } = p.change;
-    if (typeof from !== "number" || typeof to !== "number") continue;
-    const between = from > 0 && to > 0 ? Math.sqrt(from * to) : (from + to) / 2;
-    const overshotTowardBias = ctx.movement === "toward-underfitting" || ctx.movement === "worse-on-both";
-    const overshotTowardVariance = ctx.movement === "toward-overfitting" || ctx.movement === "worse-on-both";
-    if (p.lever === "stronger-regularization" && overshotTowardBias) {
-      add2(
-        "weaker-regularization",
-        100,
-        `${p.change.key} rose ${from} \u2192 ${to} and moved the model toward underfitting (\u0394bias ${formatChange(ctx.bias.estimate, kind)}); try ${p.change.key} \u2248 ${formatNumber(between)}, between the two.`,
-        [`\u0394bias ${formatChange(ctx.bias.estimate, kind)}, p ${formatP(ctx.bias.p)}`]
-      );
-    }
-    if (p.lever === "weaker-regularization" && overshotTowardVariance) {
-      add2(
-        "stronger-regularization",
-        100,
-        `${p.change.key} fell ${from} \u2192 ${to} and moved the model toward overfitting (\u0394variance ${formatChange(ctx.variance.estimate, kind)}); try ${p.change.key} \u2248 ${formatNumber(between)}, between the two.`,
-        [`\u0394variance ${formatChange(ctx.variance.estimate, kind)}, p ${formatP(ctx.variance.p)}`]
-      );
-    }
-    if ((p.lever === "richer-features" || p.lever === "more-features" || p.lever === "bigger-model") && overshotTowardVariance) {
-      const back = p.lever === "bigger-model" ? "smaller-model" : "fewer-features";
-      add2(
-        back,
-        90,
-        `${p.change.key} rose ${from} \u2192 ${to} and moved the model toward overfitting (\u0394variance ${formatChange(ctx.variance.estimate, kind)}); step back toward ${formatNumber(between)} or keep it and regularize harder.`,
-        [`\u0394variance ${formatChange(ctx.variance.estimate, kind)}`]
-      );
-      if (reg !== null && reg.side === "below") {
-        add2(
-          "stronger-regularization",
-          95,
-          `Keep the new ${p.change.key} and regularize harder: the candidate's sweep has its validation minimum at \u03BB \u2248 ${formatNumber(reg.bestX)}${ctx.lambda === void 0 ? "" : ` (it uses ${formatNumber(ctx.lambda)})`}; try ${formatNumber(reg.suggestedX)}.`,
-          [`lowest validation ${v(reg.bestValidation)} at \u03BB \u2248 ${formatNumber(reg.bestX)}`]
-        );
-      } else {
-        add2(
-          "stronger-regularization",
-          85,
-          `Keep the new ${p.change.key} but counter its extra variance with stronger regularization.`,
-          []
-        );
-      }
-    }
-  }
-  const order = targets(ctx.candidate.diagnosis, ctx.candidate);
-  order.forEach((target, t) => {
-    const component = ctx.candidate.components[target];
-    const label = target === "bias" ? "avoidable bias" : "variance";
-    const size = component.value === null ? "" : `: ${label} ${v(component.value)} against a validation error of ${v(ctx.candidate.errorLevel)}`;
-    BY_TARGET[target].forEach((id, i) => {
-      let score = 60 - t * 20 - i * 2;
-      let reason = `The candidate has high ${target}${size}.`;
-      const evidence = [];
-      if (id === "more-data" && lc !== null) {
-        const twice = lc.projections[0];
-        if (twice !== void 0) {
-          reason = `2\xD7 data projects validation ${ctx.metricName} ${v(ctx.candidate.splits.find((s) => s.split === "validation")?.mean ?? 0)} \u2192 ${v(twice.validation)} (power-law fit R\xB2 ${lc.r2.toFixed(2)}).`;
-          evidence.push(
-            `fit e(m) = ${formatNumber(lc.a)}\xB7m^\u2212${formatNumber(lc.b)} + ${formatNumber(lc.c)}; at ${formatNumber(twice.x)} examples: ${v(twice.ci[0])} to ${v(twice.ci[1])}`
-          );
-        }
-        if (lc.gapTrend === "flat") {
-          score -= 25;
-          reason = `More data will help little: the train/validation gap is flat at the right end of the learning curve.`;
-        } else if (lc.gapTrend === "closing") score += 8;
-      }
-      if ((id === "stronger-regularization" || id === "weaker-regularization") && reg !== null) {
-        const wants = id === "stronger-regularization" ? "below" : "above";
-        if (reg.atEdge !== null) {
-          evidence.push(
-            `the sweep's minimum is at its ${reg.atEdge} end (${formatNumber(reg.bestX)}): extend the sweep`
-          );
-        }
-        if (reg.side === wants) {
-          score += 10;
-          reason = `The regularization sweep has its validation minimum at \u03BB \u2248 ${formatNumber(reg.bestX)}${ctx.lambda === void 0 ? "" : `, the candidate uses ${formatNumber(ctx.lambda)}`}; try ${formatNumber(reg.suggestedX)}.`;
-        } else if (reg.side !== "unknown") {
-          score -= 20;
-          const meaning = LEVER_CATALOGUE[id].meaning;
-          reason = `${meaning.charAt(0).toUpperCase()}${meaning.slice(1)}, but the sweep's validation minimum (\u03BB \u2248 ${formatNumber(reg.bestX)}) is on the other side.`;
-        }
-      }
-      if (id === "early-stopping") {
-        if (ep !== null && ep.stoppedLate) {
-          score += 12;
-          reason = stopEarlierReason(ep);
-        } else {
-          score -= 15;
-          reason = `${reason} ${ep === null ? "No epoch curve to confirm it." : "The epoch curve does not show training past the validation minimum."}`;
-        }
-      }
-      if (id === "train-longer") {
-        if (ep !== null && ep.stoppedEarly) {
-          score += 12;
-          reason = trainLongerReason(ep);
-        } else {
-          score -= 15;
-          reason = `${reason} ${ep === null ? "No epoch curve to confirm it." : "The epoch curve does not show both errors still falling at the end."}`;
-        }
-      }
-      if (id === "weaker-regularization" && ctx.lambda === void 0 && reg === null) score -= 10;
-      const note = pulledNote(id);
-      if (note !== null) {
-        score -= 30;
-        reason = `${reason} Note: ${note}; judge its effect before pulling further.`;
-      }
-      add2(id, score, reason, evidence);
-    });
-  });
-  if (ep !== null && ep.stoppedLate && !drafts.has("early-stopping")) {
-    add2("early-stopping", 35, stopEarlierReason(ep));
-  }
-  if (ep !== null && ep.stoppedEarly && !drafts.has("train-longer")) {
-    add2("train-longer", 35, trainLongerReason(ep));
-  }
-  if (ctx.candidate.diagnosis === "data-mismatch" || ctx.candidate.components.mismatch.present) {
-    const d = ctx.candidate.components.mismatch.value ?? 0;
-    add2(
-      "align-training-data",
-      ctx.candidate.diagnosis === "data-mismatch" ? 70 : 30,
-      `Validation error exceeds train_dev error by ${v(d)}: the training data does not look like the validation data; collect or synthesise training data that resembles it.`
-    );
-  }
-  if (ctx.candidate.components.overfit.present) {
-    add2(
-      "bigger-validation-set",
-      40,
-      `Test error exceeds validation error by ${v(ctx.candidate.components.overfit.value ?? 0)}: choices may be tuned to the validation set; enlarge or refresh it.`
-    );
-  }
-  if (ctx.candidate.biasUnknown) {
-    add2(
-      "supply-reference",
-      20,
-      'Bias is unknown without a reference level: add "reference" (human-level error, a prior system, or an estimated Bayes error) to the artifacts or the config.'
-    );
-  }
-  if (ctx.noiseUnknown) {
-    add2(
-      "add-repeats",
-      15,
-      "Run-to-run noise is unknown: train with 2 or more seeds (or ship per-example predictions) so changes can be tested."
-    );
-  }
-  const levers = [...drafts.values()].sort((a, b) => b.score - a.score).map(({ id, reason, evidence }) => ({ id, reason, evidence }));
-  const nonLevers = [];
-  const biasy = ctx.candidate.diagnosis === "high-bias" || ctx.candidate.diagnosis === "high-bias-and-variance";
-  const shrank = ctx.changes.some((c) => c.kind === "lowered" && knobOf(c.key) === "data");
-  if (biasy || shrank) nonLevers.push(SMALLER_TRAINING_SET_NOTE);
-  return { levers, nonLevers };
-}
-
-// src/analysis/movement.ts
-var TABLE = {
-  down: { down: "better-on-both", flat: "away-from-underfitting", up: "toward-overfitting" },
-  flat: { down: "away-from-overfitting", flat: "no-significant-change", up: "toward-overfitting" },
-  up: { down: "toward-underfitting", flat: "toward-underfitting", up: "worse-on-both" }
-};
-function movementOf(biasCall, varianceCall) {
-  return TABLE[biasCall][varianceCall];
-}
-function validationChangeOf(shortfallCall) {
-  return shortfallCall === "up" ? "worse" : shortfallCall === "down" ? "better" : "flat";
 }
 
 // src/analysis/slices.ts
@@ -21983,258 +22231,156 @@ function compareSlices(baseline, candidate, aggregate, settings) {
   }
   unpaired.push(...base.keys());
   const adjusted = holmAdjust(pairs.map((p) => p.test.p));
-  const slices = pairs.map(({ b, c, test }, i) => {
+  const slices2 = pairs.map(({ b, c, test }, i) => {
     const pAdjusted = adjusted[i] ?? null;
     const call = callOf({ ...test, p: pAdjusted }, settings);
-    const change = call === "flat" ? "flat" : call === "up" === (sign === 1) ? "worse" : "better";
+    const change2 = call === "flat" ? "flat" : call === "up" === (sign === 1) ? "worse" : "better";
     return {
       name: c.name,
       examples: c.examples ?? null,
       baseline: b.validation,
       candidate: c.validation,
-      delta: {
-        estimate: test.estimate,
-        ci: test.ci,
-        p: test.p,
-        test: test.test,
-        call: callOf(test, settings)
-      },
+      delta: toMetricDelta(test, settings),
       pAdjusted,
-      change,
-      hiddenRegression: change === "worse" && aggregate === "better"
+      change: change2,
+      hiddenRegression: change2 === "worse" && aggregate === "better"
     };
   });
-  return { slices, unpaired };
+  return { slices: slices2, unpaired };
 }
 
 // src/analysis/review.ts
-function splitSummary(run, split, alpha) {
-  const s = run.splits[split];
-  if (s === void 0) return null;
-  const m = mean(s.values);
-  const n = s.values.length;
-  const sd = n >= 2 ? Math.sqrt(sampleVariance(s.values)) : null;
-  let ci = null;
-  if (sd !== null) {
-    const half = tQuantile(1 - alpha / 2, n - 1) * (sd / Math.sqrt(n));
-    ci = [m - half, m + half];
-  } else if (run.metric.kind === "proportion" && s.examples !== void 0) {
-    ci = wilsonInterval(Math.round(m * s.examples), s.examples, alpha);
-  }
-  return { split, mean: m, sd, repeats: n, examples: s.examples ?? null, ci };
+var NOTE_NAMES = 5;
+function failOnOf(values) {
+  return values.map((value2) => {
+    if (!isFailOn(value2)) throw new RangeError(`unknown fail-on outcome ${JSON.stringify(value2)}`);
+    return value2;
+  });
 }
-function lambdaOf(run) {
-  for (const [key, value] of Object.entries(run.hyperparameters ?? {})) {
-    if (typeof value === "number" && knobOf(key) === "regularization" && !/dropout/i.test(key))
-      return value;
-  }
-  return void 0;
-}
-function summarize(run, settings) {
-  const reference = chooseReference(run, settings.reference);
-  const components = decompose(run, reference.value, settings);
-  const diagnosis = diagnose(components);
-  const warnings = [];
-  if (components.overfit.present) {
-    warnings.push(
-      "Test error is well above validation error: model choices may be tuned to the validation set."
-    );
-  }
-  const lambda = lambdaOf(run);
+function reviewSettings(input) {
   return {
-    name: run.run.name,
-    commit: run.run.commit ?? null,
-    createdAt: run.run.createdAt ?? null,
-    reference: reference.value,
-    referenceSource: reference.source,
-    splits: SPLIT_NAMES.flatMap((s) => splitSummary(run, s, settings.alpha) ?? []),
-    errorLevel: errorLevel(run),
-    components,
-    diagnosis,
-    biasUnknown: reference.value === null,
-    warnings,
-    curves: analyzeCurves(run.curves, {
-      ...lambda === void 0 ? {} : { lambda },
-      kind: run.metric.kind,
-      goal: run.metric.goal
-    })
+    alpha: input.alpha,
+    minEffect: input.minEffect,
+    gapTolerance: input.gapTolerance,
+    failOn: failOnOf(input.failOn)
   };
 }
-function pairedTest(paired, run, alpha) {
-  if (paired.rows === 0) return null;
-  if (paired.kind === "proportion") {
-    const result = mcnemarExact(
-      paired.baselineOnly ?? 0,
-      paired.candidateOnly ?? 0,
-      paired.rows,
-      alpha
-    );
-    return run.metric.goal === "minimize" ? toMetricUnits(result, -1) : result;
-  }
-  return pairedT(
-    { n: paired.rows, mean: paired.meanDiff ?? 0, variance: paired.varDiff ?? 0 },
-    alpha
-  );
-}
-function both(measure) {
-  return { baseline: measure, candidate: measure };
-}
+var NO_BIAS_CHANGE = {
+  unit: "shortfall",
+  estimate: 0,
+  ci: null,
+  p: null,
+  test: "none",
+  call: "flat"
+};
 function buildReview(input) {
-  const { baseline, candidate, settings } = input;
+  const { baseline, candidate } = input;
+  const settings = reviewSettings(input.settings);
   const calls = { alpha: settings.alpha, minEffect: settings.minEffect };
-  const sign = shortfallSign(candidate);
-  const notes = [...input.notes ?? []];
-  const base = summarize(baseline, settings);
-  const cand = summarize(candidate, settings);
-  const pairedSplit = input.paired?.split ?? "validation";
-  const shortfallChanges = /* @__PURE__ */ new Map();
-  for (const split of SPLIT_NAMES) {
-    let result = measureChange(baseline, candidate, both(splitMeasure(split)), settings.alpha);
-    if (result === null) continue;
-    if (input.paired !== void 0 && split === pairedSplit && (result.test === "none" || result.test === "z-binomial")) {
-      const paired2 = pairedTest(input.paired, candidate, settings.alpha);
-      if (paired2 !== null) result = toMetricUnits(paired2, sign);
-    }
-    shortfallChanges.set(split, result);
-  }
-  const validationShortfall = shortfallChanges.get("validation");
+  const reference = input.settings.reference;
+  const summarySettings = { ...settings, ...reference === void 0 ? {} : { reference } };
+  const base = summarize(baseline, summarySettings);
+  const cand = summarize(candidate, summarySettings);
+  const runs = { baseline, candidate };
+  const shortfalls = splitShortfalls(runs, settings.alpha, input.paired);
+  const validationShortfall = shortfalls.get("validation");
   if (validationShortfall === void 0)
     throw new Error("validation split is required by the schema");
-  const validationDelta = toDelta(validationShortfall, calls);
-  const splits = [];
-  for (const [split, result] of shortfallChanges) {
-    const b = base.splits.find((s) => s.split === split);
-    const c = cand.splits.find((s) => s.split === split);
-    if (b === void 0 || c === void 0) continue;
-    splits.push({
-      split,
-      baseline: b.mean,
-      candidate: c.mean,
-      delta: toDelta(toMetricUnits(result, sign), calls)
-    });
-  }
-  const refB = base.reference;
-  const refC = cand.reference;
-  const [biasRefB, biasRefC] = refB !== null && refC !== null ? [refB, refC] : [0, 0];
-  const biasResult = measureChange(
-    baseline,
-    candidate,
-    {
-      baseline: componentMeasures(baseline, biasRefB).bias ?? splitMeasure("train"),
-      candidate: componentMeasures(candidate, biasRefC).bias ?? splitMeasure("train")
-    },
-    settings.alpha
+  const components = componentChanges(
+    runs,
+    { baseline: base.reference, candidate: cand.reference },
+    calls
   );
-  const componentChange = (name) => {
-    const mb = componentMeasures(baseline, refB)[name];
-    const mc = componentMeasures(candidate, refC)[name];
-    if (mb === null || mc === null) return null;
-    if (name === "variance" && baseline.splits.train_dev === void 0 !== (candidate.splits.train_dev === void 0)) {
-      const fallback = {
-        terms: [
-          { split: "validation", weight: 1 },
-          { split: "train", weight: -1 }
-        ],
-        constant: 0
-      };
-      notes.push(
-        "Only one run has a train_dev split: the variance change is measured as validation \u2212 train in both."
-      );
-      const r2 = measureChange(baseline, candidate, both(fallback), settings.alpha);
-      return r2 === null ? null : toDelta(r2, calls);
-    }
-    const r = measureChange(baseline, candidate, { baseline: mb, candidate: mc }, settings.alpha);
-    return r === null ? null : toDelta(r, calls);
+  const movement = movementOf(components.bias?.call ?? "flat", components.variance.call);
+  const validation = {
+    change: validationChangeOf(toShortfallDelta(validationShortfall, calls).call),
+    delta: toMetricDelta(toMetricUnits(validationShortfall, shortfallSign(candidate)), calls)
   };
-  const biasDelta = biasResult === null ? null : toDelta(biasResult, calls);
-  const varianceDelta = componentChange("variance");
-  if (varianceDelta === null)
-    throw new Error("variance needs train and validation, which the schema requires");
-  const movement = movementOf(biasDelta?.call ?? "flat", varianceDelta.call);
-  const validationChange = validationChangeOf(validationDelta.call);
-  const sliceResult = compareSlices(baseline, candidate, validationChange, calls);
-  if (sliceResult.unpaired.length > 0) {
-    notes.push(
-      `${sliceResult.unpaired.length} slice(s) appear in one run only and were not compared: ${sliceResult.unpaired.slice(0, 5).join(", ")}${sliceResult.unpaired.length > 5 ? ", \u2026" : ""}.`
-    );
-  }
-  const hidden = sliceResult.slices.filter((s) => s.hiddenRegression);
-  if (hidden.length > 0) {
-    notes.push(
-      `Validation improved overall, yet ${hidden.length} slice(s) regressed significantly (Holm-adjusted): ${hidden.slice(0, 5).map((s) => s.name).join(", ")}.`
-    );
-  }
-  const noiseUnknown = validationDelta.test === "none" || varianceDelta.test === "none";
-  if (noiseUnknown) {
-    notes.push(
-      settings.minEffect > 0 ? `Run-to-run noise is unknown (one repeat of a continuous metric, no per-example predictions): changes are called on size alone (min-effect ${formatValue(settings.minEffect, candidate.metric.kind)}).` : "Run-to-run noise is unknown (one repeat of a continuous metric, no per-example predictions) and min-effect is 0: no change can be called. Add repeats (seeds), per-example predictions, or set min-effect."
-    );
-  }
-  if (cand.biasUnknown) {
-    notes.push(
-      "Avoidable bias is unknown: there is no reference level for this metric. Its change is still measured from the training error; the diagnosis rests on variance and data mismatch."
-    );
-  }
-  if (input.paired !== void 0 && input.paired.rows === 0) {
-    notes.push("The two predictions files share no id: the paired test was not used.");
-  }
+  const sliceResult = compareSlices(baseline, candidate, validation.change, calls);
+  const noiseUnknown = validation.delta.test === "none" || components.variance.test === "none";
   const changes = diffHyperparameters(baseline.hyperparameters, candidate.hyperparameters);
-  const lambda = lambdaOf(candidate);
-  const { levers, nonLevers } = chooseLevers({
-    kind: candidate.metric.kind,
-    metricName: candidate.metric.name,
+  const { levers, nonLevers: nonLevers2 } = chooseLevers({
+    goal: candidate.metric.goal,
     candidate: cand,
     baseline: base,
     movement,
-    bias: biasDelta ?? { estimate: 0, ci: null, p: null, test: "none", call: "flat" },
-    variance: varianceDelta,
+    bias: components.bias ?? NO_BIAS_CHANGE,
+    variance: components.variance,
     pulled: pulledLevers(changes),
     changes,
-    lambda,
+    regularization: regularizationOf(candidate),
     noiseUnknown
   });
-  const partial = {
-    movement,
-    validation: {
-      change: validationChange,
-      delta: toDelta(toMetricUnits(validationShortfall, sign), calls)
-    },
-    slices: sliceResult.slices,
-    candidate: cand,
-    settings: {
-      alpha: settings.alpha,
-      minEffect: settings.minEffect,
-      gapTolerance: settings.gapTolerance,
-      failOn: [...settings.failOn]
-    }
-  };
-  const gate = applyGate(partial);
-  const paired = input.paired === void 0 ? null : {
-    rows: input.paired.rows,
-    test: input.paired.kind === "proportion" ? "mcnemar-exact" : "paired-t",
-    ...input.paired.kind === "proportion" ? {
-      discordant: {
-        baselineOnly: input.paired.baselineOnly ?? 0,
-        candidateOnly: input.paired.candidateOnly ?? 0
-      }
-    } : {}
-  };
+  const gate = applyGate(
+    { movement, validation, slices: sliceResult.slices, candidate: cand },
+    settings.failOn
+  );
   return {
     format: "fitgap-review/1",
     metric: { ...candidate.metric },
-    ...partial,
-    bias: { delta: biasDelta },
-    variance: { delta: varianceDelta },
-    mismatch: { delta: componentChange("mismatch") },
-    overfit: { delta: componentChange("overfit") },
-    splits,
+    settings,
+    movement,
+    validation,
+    bias: { delta: components.bias },
+    variance: { delta: components.variance },
+    mismatch: { delta: components.mismatch },
+    overfit: { delta: components.overfit },
+    splits: splitChanges(shortfalls, runs, { baseline: base, candidate: cand }, calls),
     baseline: base,
+    candidate: cand,
+    slices: sliceResult.slices,
     hyperparameters: changes,
     levers,
-    nonLevers,
+    nonLevers: nonLevers2,
     gate,
-    notes,
-    paired
+    notes: [
+      ...input.notes ?? [],
+      ...reviewNotes({
+        components,
+        unpaired: sliceResult.unpaired,
+        slices: sliceResult.slices,
+        noiseUnknown,
+        biasUnknown: cand.biasUnknown,
+        paired: input.paired
+      })
+    ],
+    paired: pairedSummary(input.paired)
+  };
+}
+function reviewNotes(facts) {
+  const notes = [];
+  if (facts.components.varianceFallback) notes.push({ code: "train-dev-in-one-run" });
+  if (facts.unpaired.length > 0) {
+    notes.push({
+      code: "unpaired-slices",
+      count: facts.unpaired.length,
+      names: facts.unpaired.slice(0, NOTE_NAMES)
+    });
+  }
+  const hidden = facts.slices.filter((s) => s.hiddenRegression);
+  if (hidden.length > 0) {
+    notes.push({
+      code: "hidden-regressions",
+      count: hidden.length,
+      names: hidden.slice(0, NOTE_NAMES).map((s) => s.name)
+    });
+  }
+  if (facts.noiseUnknown) notes.push({ code: "noise-unknown" });
+  if (facts.biasUnknown) notes.push({ code: "bias-unknown" });
+  if (facts.paired !== void 0 && facts.paired.rows === 0)
+    notes.push({ code: "predictions-share-no-id" });
+  return notes;
+}
+function pairedSummary(paired) {
+  if (paired === void 0) return null;
+  if (paired.kind === "continuous") return { rows: paired.rows, test: "paired-t" };
+  return {
+    rows: paired.rows,
+    test: "mcnemar-exact",
+    discordant: {
+      baselineOnly: paired.baselineOnly ?? 0,
+      candidateOnly: paired.candidateOnly ?? 0
+    }
   };
 }
 
@@ -22274,8 +22420,8 @@ var HashLog = class {
 };
 function parseValue(raw, kind, file, line) {
   const column = kind === "proportion" ? "correct" : "loss";
-  const value = raw.trim() === "" ? Number.NaN : Number(raw);
-  if (kind === "proportion" ? value !== 0 && value !== 1 : !Number.isFinite(value)) {
+  const value2 = raw.trim() === "" ? Number.NaN : Number(raw);
+  if (kind === "proportion" ? value2 !== 0 && value2 !== 1 : !Number.isFinite(value2)) {
     throw new InputError([
       {
         file,
@@ -22285,7 +22431,7 @@ function parseValue(raw, kind, file, line) {
       }
     ]);
   }
-  return value;
+  return value2;
 }
 async function* readRows(path, file, kind, hashes) {
   const stream = createReadStream(path, { encoding: "utf8" });
@@ -22448,14 +22594,12 @@ async function pairIfBoth(baseline, candidate) {
   const cp = candidate.artifact.predictions;
   if (bp === void 0 || cp === void 0 || baseline.predictionsPath === null || candidate.predictionsPath === null) {
     return {
-      notes: bp !== cp && (bp === void 0 || cp === void 0) ? ["Only one run ships per-example predictions: no paired test."] : []
+      notes: bp !== cp && (bp === void 0 || cp === void 0) ? [{ code: "predictions-in-one-run" }] : []
     };
   }
   if (bp.split !== cp.split) {
     return {
-      notes: [
-        `The predictions are for different splits (${bp.split} vs ${cp.split}): no paired test.`
-      ]
+      notes: [{ code: "predictions-split-mismatch", baseline: bp.split, candidate: cp.split }]
     };
   }
   const result = await pairPredictions(
@@ -22466,9 +22610,12 @@ async function pairIfBoth(baseline, candidate) {
   const notes = [];
   const { unmatched, ...paired } = result;
   if (unmatched.baseline + unmatched.candidate > 0) {
-    notes.push(
-      `Predictions paired by id: ${result.rows} rows in both; ${unmatched.baseline} baseline and ${unmatched.candidate} candidate rows had no partner and were left out of the paired test.`
-    );
+    notes.push({
+      code: "predictions-unmatched",
+      rows: result.rows,
+      baseline: unmatched.baseline,
+      candidate: unmatched.candidate
+    });
   }
   return { paired: { ...paired, split: bp.split }, notes };
 }
@@ -22534,24 +22681,24 @@ function parseFlags(argv, options, command) {
     throw new UsageError(`fitgap ${command}: ${message}. Run 'fitgap ${command} --help'.`);
   }
 }
-function parseFormat(value, command) {
-  if (value === void 0) return "text";
-  if (typeof value === "string" && FORMATS.includes(value))
-    return value;
+function parseFormat(value2, command) {
+  if (value2 === void 0) return "text";
+  if (typeof value2 === "string" && FORMATS.includes(value2))
+    return value2;
   throw new UsageError(
-    `fitgap ${command}: --format must be one of ${FORMATS.join(", ")} (got ${JSON.stringify(value)}).`
+    `fitgap ${command}: --format must be one of ${FORMATS.join(", ")} (got ${JSON.stringify(value2)}).`
   );
 }
 function number(values, flag, range, command) {
   const raw = values[flag];
   if (raw === void 0 || typeof raw !== "string") return void 0;
-  const value = Number(raw);
-  if (raw.trim() === "" || !Number.isFinite(value) || value < range[0] || value > range[1]) {
+  const value2 = Number(raw);
+  if (raw.trim() === "" || !Number.isFinite(value2) || value2 < range[0] || value2 > range[1]) {
     throw new UsageError(
       `fitgap ${command}: --${flag} must be a number from ${range[0]} to ${range[1]} (got ${JSON.stringify(raw)}).`
     );
   }
-  return value;
+  return value2;
 }
 function parseOverrides(values, command) {
   const out = {};
@@ -22624,8 +22771,8 @@ order will be late. Without NAME, the first candidate is reviewed and the others
 `;
 
 // node_modules/markdown-table/index.js
-function defaultStringLength(value) {
-  return value.length;
+function defaultStringLength(value2) {
+  return value2.length;
 }
 function markdownTable(table2, options) {
   const settings = options || {};
@@ -22758,11 +22905,11 @@ function markdownTable(table2, options) {
   }
   return lines.join("\n");
 }
-function serialize(value) {
-  return value === null || value === void 0 ? "" : String(value);
+function serialize(value2) {
+  return value2 === null || value2 === void 0 ? "" : String(value2);
 }
-function toAlignment(value) {
-  const code = typeof value === "string" ? value.codePointAt(0) : 0;
+function toAlignment(value2) {
+  const code = typeof value2 === "string" ? value2.codePointAt(0) : 0;
   return code === 67 || code === 99 ? 99 : code === 76 || code === 108 ? 108 : code === 82 || code === 114 ? 114 : 0;
 }
 
@@ -22812,63 +22959,118 @@ function mermaidLabel(text2, maxChars = 60) {
 function terminalText(text2, maxChars = DEFAULT_MAX_NAME) {
   return plainText(text2, maxChars);
 }
-function displayValue(value) {
-  if (value === void 0) return "(absent)";
-  if (typeof value === "string") return value;
-  if (typeof value === "number" || typeof value === "boolean" || value === null) {
-    return String(value);
+function displayValue(value2) {
+  if (value2 === void 0) return "(absent)";
+  if (typeof value2 === "string") return value2;
+  if (typeof value2 === "number" || typeof value2 === "boolean" || value2 === null) {
+    return String(value2);
   }
   try {
-    return JSON.stringify(value) ?? String(value);
+    return JSON.stringify(value2) ?? String(value2);
   } catch {
-    return String(value);
+    return String(value2);
   }
 }
 
 // src/report/format.ts
+var MINUS = "\u2212";
+var SIGNIFICANT = 4;
+var MAX_DECIMALS = 6;
 function numberFormatFor(review) {
   let largest = 0;
-  for (const change of review.splits) {
-    largest = Math.max(largest, Math.abs(change.baseline), Math.abs(change.candidate));
+  for (const change2 of review.splits) {
+    largest = Math.max(largest, Math.abs(change2.baseline), Math.abs(change2.candidate));
   }
-  if (largest === 0 || !Number.isFinite(largest)) return { decimals: 4 };
-  const decimals = 3 - Math.floor(Math.log10(largest));
-  return { decimals: Math.min(6, Math.max(0, decimals)) };
+  const decimals = largest === 0 || !Number.isFinite(largest) ? SIGNIFICANT : Math.min(MAX_DECIMALS, Math.max(0, SIGNIFICANT - 1 - Math.floor(Math.log10(largest))));
+  return { kind: review.metric.kind, decimals };
 }
-function num(value, format) {
-  const text2 = value.toFixed(format.decimals);
-  return /^-0(\.0+)?$/.test(text2) ? text2.slice(1) : text2;
+function digits(v, f) {
+  const proportion = f.kind === "proportion";
+  const text2 = (proportion ? v * 100 : v).toFixed(
+    proportion ? Math.max(0, f.decimals - 2) : f.decimals
+  );
+  if (/^-0(\.0+)?$/.test(text2)) return text2.slice(1);
+  return text2.replace("-", MINUS);
 }
-function signed(value, format) {
-  const text2 = num(Math.abs(value), format);
-  if (/^0(\.0+)?$/.test(text2)) return text2;
-  return value > 0 ? `+${text2}` : `\u2212${text2}`;
+function isZero(text2) {
+  return /^0(\.0+)?$/.test(text2);
 }
-function interval(ci, format) {
+function value(v, f) {
+  return f.kind === "proportion" ? `${digits(v, f)}%` : digits(v, f);
+}
+function unit(f) {
+  return f.kind === "proportion" ? " pts" : "";
+}
+function signedDigits(v, f) {
+  const text2 = digits(Math.abs(v), f);
+  if (isZero(text2)) return text2;
+  return v > 0 ? `+${text2}` : `${MINUS}${text2}`;
+}
+function change(v, f) {
+  return `${signedDigits(v, f)}${unit(f)}`;
+}
+function amount(v, f) {
+  return `${digits(Math.abs(v), f)}${unit(f)}`;
+}
+function difference(v, f) {
+  return `${digits(v, f)}${unit(f)}`;
+}
+function changeInterval(ci, f) {
   if (ci === null) return "n/a";
-  return `[${signed(ci[0], format)}, ${signed(ci[1], format)}]`;
+  return `[${signedDigits(ci[0], f)}, ${signedDigits(ci[1], f)}]${unit(f)}`;
 }
-function pValue(p) {
+function valueRange(ci, f) {
+  return `${value(ci[0], f)} to ${value(ci[1], f)}`;
+}
+function unitLine(f, values) {
+  if (f.kind !== "proportion") return null;
+  return values === "values" ? "Values in percent; \u0394 and intervals in percentage points." : "Components, \u0394 and intervals in percentage points.";
+}
+function valueCell(v, f) {
+  return digits(v, f);
+}
+function changeCell(v, f) {
+  return signedDigits(v, f);
+}
+function intervalCell(ci, f) {
+  if (ci === null) return "n/a";
+  return `[${signedDigits(ci[0], f)}, ${signedDigits(ci[1], f)}]`;
+}
+var SMALLEST_P = 1e-3;
+function pCell(p) {
+  if (p === null) return "n/a";
+  return p < SMALLEST_P ? `< ${SMALLEST_P}` : p.toFixed(3);
+}
+function pText(p) {
   if (p === null) return "p n/a";
-  if (p < 1e-3) return "p < 0.001";
-  return `p = ${p.toFixed(3)}`;
+  return p < SMALLEST_P ? `p < ${SMALLEST_P}` : `p = ${p.toFixed(3)}`;
 }
 function count(n) {
   return Math.round(n).toString().replace(/\B(?=(\d{3})+(?!\d))/g, ",");
 }
-function short(value) {
-  if (value === 0) return "0";
-  const abs = Math.abs(value);
-  if (abs >= 1e6 || abs < 1e-4) return value.toExponential(2);
-  return String(Number(value.toPrecision(4)));
+function short(v) {
+  if (v === 0) return "0";
+  const abs = Math.abs(v);
+  const text2 = abs >= 1e6 || abs < 1e-4 ? v.toExponential(2) : String(Number(v.toPrecision(4)));
+  return text2.replace(/-/g, MINUS);
 }
-function chartNumber(value, decimals) {
-  const text2 = value.toFixed(decimals);
+function fixed(v, decimals) {
+  const text2 = v.toFixed(decimals);
+  return /^-0(\.0+)?$/.test(text2) ? text2.slice(1) : text2.replace("-", MINUS);
+}
+function chartNumber(v, decimals) {
+  const text2 = v.toFixed(decimals);
   return /^-0(\.0+)?$/.test(text2) ? text2.slice(1) : text2;
 }
 
 // src/report/words.ts
-var MOVEMENT_TITLE = {
+function words(entries) {
+  return new Map(Object.entries(entries));
+}
+function say(table2, code, esc) {
+  return table2.get(code) ?? esc(String(code), 60);
+}
+var MOVEMENT_TITLE = words({
   "better-on-both": "less bias and less variance",
   "away-from-underfitting": "away from underfitting",
   "toward-overfitting": "toward overfitting",
@@ -22876,8 +23078,8 @@ var MOVEMENT_TITLE = {
   "no-significant-change": "no change beyond noise",
   "toward-underfitting": "toward underfitting",
   "worse-on-both": "more bias and more variance"
-};
-var MOVEMENT_SENTENCE = {
+});
+var MOVEMENT_SENTENCE = words({
   "better-on-both": "The change lowered both avoidable bias and variance",
   "away-from-underfitting": "The change moved the model away from underfitting",
   "toward-overfitting": "The change moved the model toward overfitting",
@@ -22885,38 +23087,44 @@ var MOVEMENT_SENTENCE = {
   "no-significant-change": "The change did not move avoidable bias or variance beyond run-to-run noise",
   "toward-underfitting": "The change moved the model toward underfitting",
   "worse-on-both": "The change raised both avoidable bias and variance"
-};
-var VALIDATION_WORD = {
+});
+var VALIDATION_WORD = words({
   better: "better",
   worse: "worse",
   flat: "unchanged within noise"
-};
-var DIAGNOSIS_WORD = {
+});
+var DIAGNOSIS_WORD = words({
   "good-fit": "good fit",
   "high-bias": "high bias (underfitting)",
   "high-variance": "high variance (overfitting)",
   "data-mismatch": "data mismatch",
   "high-bias-and-variance": "high bias and high variance"
-};
-var COMPONENT_WORD = {
+});
+var COMPONENT_TITLE = words({
   bias: "Avoidable bias",
   variance: "Variance",
   mismatch: "Data mismatch",
   overfit: "Validation overfit"
-};
+});
+var COMPONENT_WORD = words({
+  bias: "avoidable bias",
+  variance: "variance",
+  mismatch: "data mismatch",
+  overfit: "validation overfit"
+});
 var COMPONENT_ORDER = [
   "bias",
   "variance",
   "mismatch",
   "overfit"
 ];
-var SPLIT_WORD = {
+var SPLIT_WORD = words({
   train: "train",
   train_dev: "train-dev",
   validation: "validation",
   test: "test"
-};
-var LEVER_TITLE = {
+});
+var LEVER_TITLE = words({
   "more-data": "Add training data",
   "fewer-features": "Use fewer features",
   "stronger-regularization": "Strengthen regularization",
@@ -22931,29 +23139,35 @@ var LEVER_TITLE = {
   "bigger-validation-set": "Use a bigger validation set",
   "add-repeats": "Repeat each run with several seeds",
   "supply-reference": "Supply a reference error level"
-};
-var TEST_WORD = {
+});
+var TEST_WORD = words({
   "welch-t": "Welch's t-test",
   "z-binomial": "binomial z-test",
   "mcnemar-exact": "McNemar's exact test",
   "paired-t": "paired t-test",
   none: "no test"
-};
-var TEST_WHY = {
+});
+var TEST_WHY = words({
   "welch-t": "Welch's t-test on per-repeat values: each run has two or more repeats (seeds), and their spreads may differ.",
   "z-binomial": "normal approximation with binomial variances: one repeat of a proportion metric measured on a known number of examples.",
   "mcnemar-exact": "McNemar's exact test: both runs scored the same examples, so only the examples on which they disagree carry information.",
   "paired-t": "paired t-test on per-example loss differences: both runs scored the same examples with a continuous loss.",
   none: "no test: with one repeat of a continuous metric and no paired predictions, run-to-run noise is unknown, so only min-effect decides."
-};
+});
+var REFERENCE_SOURCE = words({
+  artifact: "from the artifact",
+  config: "from the config",
+  default: "the default for a minimized proportion",
+  unknown: "source unknown"
+});
 function reading(call, review) {
   if (call === "flat") return "flat";
   const up = call === "up";
   return up === (review.metric.goal === "maximize") ? "better" : "worse";
 }
-function componentReading(call) {
-  if (call === "up") return "up (worse)";
-  if (call === "down") return "down (better)";
+function componentReading(call, compact) {
+  if (call === "up") return compact ? "worse" : "up (worse)";
+  if (call === "down") return compact ? "better" : "down (better)";
   return "flat";
 }
 function levelPercent(review) {
@@ -22961,8 +23175,114 @@ function levelPercent(review) {
 }
 var CAUTION = "This verdict is advice for a human reviewer, not a proof: it rests on the numbers the two runs recorded and on the tests named in the method notes.";
 
+// src/report/gate.ts
+var OUTCOME_SENTENCE = /* @__PURE__ */ new Map([
+  ["worse-validation", "validation got significantly worse"],
+  ["toward-overfitting", "the change moved toward overfitting"],
+  ["toward-underfitting", "the change moved toward underfitting"],
+  ["worse-on-both", "bias and variance both got worse"],
+  ["high-bias", "the candidate has high bias"],
+  ["high-variance", "the candidate has high variance"],
+  ["data-mismatch", "the candidate shows data mismatch"],
+  [
+    "validation-overfit",
+    "the candidate overfits the validation set (test error well above validation)"
+  ]
+]);
+function reasonSentence(reason, review, esc) {
+  if (reason.outcome === "any-movement")
+    return `the model moved (${say(MOVEMENT_TITLE, review.movement, esc)})`;
+  if (reason.outcome === "slice-regression") {
+    const n = reason.slices ?? 0;
+    return `${count(n)} ${n === 1 ? "slice" : "slices"} regressed significantly`;
+  }
+  return OUTCOME_SENTENCE.get(reason.outcome) ?? "fired";
+}
+function gateReasonLines(review, esc) {
+  return review.gate.reasons.map(
+    (reason) => `${esc(reason.outcome, 60)}: ${reasonSentence(reason, review, esc)}`
+  );
+}
+function gateSentence(review, esc) {
+  const gate = review.gate;
+  if (!gate.pass) return `${gateReasonLines(review, esc).join("; ")}.`;
+  if (gate.failOn.length === 0) return "no fail-on policy is set.";
+  return `none of fail-on (${gate.failOn.map((p) => esc(p, 60)).join(", ")}) applies.`;
+}
+
+// src/report/levers.ts
+function leverText(lever, review, f, esc) {
+  const ctx = { review, f, esc };
+  const sentences = lever.evidence.flatMap((e) => evidenceSentence(e, lever.id, ctx) ?? []);
+  if (lever.suggestion !== void 0) sentences.push(suggestionSentence(lever.suggestion, ctx));
+  return { title: say(LEVER_TITLE, lever.id, esc), sentences };
+}
+function fromTo(e) {
+  return `${short(e.from)} \u2192 ${short(e.to)}`;
+}
+function evidenceSentence(e, id, ctx) {
+  const { f, esc, review } = ctx;
+  const metric = esc(review.metric.name, 60);
+  switch (e.kind) {
+    case "diagnosis":
+      if (e.component === "mismatch")
+        return `Validation error exceeds train-dev error by ${amount(e.value, f)}: the training data does not look like the validation data; collect or synthesise training data that resembles it.`;
+      if (e.component === "overfit")
+        return `Test error exceeds validation error by ${amount(e.value, f)}: model choices may be tuned to the validation set; enlarge or refresh it.`;
+      return `The candidate has high ${say(COMPONENT_WORD, e.component, esc)}: ${amount(e.value, f)} against a validation error of ${value(e.errorLevel, f)}.`;
+    case "pr-change":
+      return `This PR ${e.direction === "raised" ? "raised" : "lowered"} ${esc(e.hyperparameter, 60)} ${fromTo(e)}.`;
+    case "component-change": {
+      const word = e.delta.call === "up" ? "rose" : e.delta.call === "down" ? "fell" : "held steady";
+      const toward = e.delta.call !== "up" ? "" : e.component === "bias" ? ": the model moved toward underfitting" : ": the model moved toward overfitting";
+      return `${say(COMPONENT_TITLE, e.component, esc)} ${word} (${change(e.delta.estimate, f)}, ${pText(e.delta.p)})${toward}.`;
+    }
+    case "already-pulled":
+      return `This PR already ${e.direction === "raised" ? "raised" : "lowered"} ${esc(e.hyperparameter, 60)} (${fromTo(e)}): judge its effect before pulling further.`;
+    case "sweep-minimum":
+      return sweepSentence(e, ctx);
+    case "learning-curve": {
+      const times = e.fromX > 0 ? ` (${short(e.atX / e.fromX)}\xD7 the largest on the curve)` : "";
+      return `At ${count(e.atX)} training examples${times} the power-law fit (R\xB2 ${fixed(e.r2, 2)}) projects validation ${metric} ${value(e.current, f)} \u2192 ${value(e.projected, f)} (${valueRange(e.ci, f)}).`;
+    }
+    case "gap-trend":
+      return e.trend === "flat" ? "The train/validation gap is flat at the right end of the learning curve: more data will help little." : "The train/validation gap is still closing at the right end of the learning curve.";
+    case "epoch-minimum":
+      return `Validation was best at epoch ${short(e.epoch)} of ${short(e.of)}; stopping there saves ${amount(e.saves, f)}${e.gl === null ? "" : ` (generalization loss ${fixed(e.gl, 1)}%)`}.`;
+    case "still-improving":
+      return `Train and validation ${metric} were both still improving at epoch ${short(e.epoch)}.`;
+    case "epoch-curve-silent":
+      if (!e.curve) return "No epoch curve to confirm it.";
+      return id === "train-longer" ? "The epoch curve does not show both errors still falling at the end." : "The epoch curve does not show training past the validation minimum.";
+    case "reference-missing":
+      return "Bias is unknown without a reference level: add `reference` (human-level error, a prior system, or an estimated Bayes error) to the artifacts or the config.";
+    case "noise-unknown":
+      return "Run-to-run noise is unknown: train with 2 or more seeds (or ship per-example predictions) so changes can be tested.";
+    default:
+      return null;
+  }
+}
+function sweepSentence(e, ctx) {
+  const { f, esc } = ctx;
+  const name = e.hyperparameter === null ? "\u03BB" : esc(e.hyperparameter, 60);
+  const at = `${name} \u2248 ${short(e.bestX)}`;
+  const uses = e.current === null ? "" : `; the candidate uses ${short(e.current)}`;
+  const edge = e.atEdge === null ? "" : ` The minimum is at the ${e.atEdge === "low" ? "low" : "high"} end of the sweep: extend it.`;
+  if (e.supports === true)
+    return `The regularization sweep has its lowest validation (${value(e.bestValidation, f)}) at ${at}${uses}.${edge}`;
+  if (e.supports === false && e.side === "at")
+    return `The candidate's strength is already at the sweep's validation minimum (${at}).${edge}`;
+  if (e.supports === false)
+    return `The sweep's validation minimum (${at}) lies on the other side of the candidate's strength.${edge}`;
+  return `The regularization sweep has its lowest validation (${value(e.bestValidation, f)}) at ${at}.${edge}`;
+}
+function suggestionSentence(s, ctx) {
+  const basis = s.basis === "between-old-and-new" ? ", between the old and new values" : s.basis === "sweep-minimum" ? ", the sweep's minimum" : ", one grid step beyond the end of the sweep";
+  return `Try ${ctx.esc(s.hyperparameter, 60)} \u2248 ${short(s.value)}${basis}.`;
+}
+
 // src/report/tables.ts
-function splitsTable(review) {
+function splitsTable(review, esc) {
   const f = numberFormatFor(review);
   return {
     header: [
@@ -22975,23 +23295,24 @@ function splitsTable(review) {
       "Reading"
     ],
     align: ["l", "r", "r", "r", "r", "r", "l"],
+    units: unitLine(f, "values"),
     rows: review.splits.map((s) => [
-      SPLIT_WORD[s.split],
-      num(s.baseline, f),
-      num(s.candidate, f),
-      signed(s.delta.estimate, f),
-      interval(s.delta.ci, f),
-      pValue(s.delta.p).replace(/^p /, "").replace(/^= /, ""),
+      say(SPLIT_WORD, s.split, esc),
+      valueCell(s.baseline, f),
+      valueCell(s.candidate, f),
+      changeCell(s.delta.estimate, f),
+      intervalCell(s.delta.ci, f),
+      pCell(s.delta.p),
       reading(s.delta.call, review)
     ])
   };
 }
-function decompositionTable(review, compact = false) {
+function decompositionTable(review, esc, compact = false) {
   const f = numberFormatFor(review);
   const cell = (run, name) => {
     const c = review[run].components[name];
     if (c.value === null) return "n/a";
-    return `${num(c.value, f)}${c.present ? compact ? "*" : " (present)" : ""}`;
+    return `${valueCell(c.value, f)}${c.present ? compact ? "*" : " (present)" : ""}`;
   };
   const deltas = {
     bias: review.bias.delta,
@@ -23001,71 +23322,49 @@ function decompositionTable(review, compact = false) {
   };
   const rows = COMPONENT_ORDER.map((name) => {
     const d = deltas[name];
+    const row = [say(COMPONENT_TITLE, name, esc), cell("baseline", name), cell("candidate", name)];
+    if (d === null) return [...row, "n/a", "n/a", ...compact ? [] : ["n/a"], "n/a"];
     return [
-      COMPONENT_WORD[name],
-      cell("baseline", name),
-      cell("candidate", name),
-      d === null ? "n/a" : signed(d.estimate, f),
-      d === null ? "n/a" : interval(d.ci, f),
-      d === null ? "n/a" : pValue(d.p).replace(/^p /, "").replace(/^= /, ""),
-      d === null ? "n/a" : componentReading(d.call)
+      ...row,
+      changeCell(d.estimate, f),
+      intervalCell(d.ci, f),
+      ...compact ? [] : [pCell(d.p)],
+      componentReading(d.call, compact)
     ];
   });
+  const units = unitLine(f, "differences");
+  const header = ["Component", "Baseline", "Candidate", "\u0394", `${levelPercent(review)}% interval`];
+  if (compact) {
+    return { header: [...header, "Call"], align: ["l", "r", "r", "r", "r", "l"], rows, units };
+  }
   rows.push([
     "Diagnosis",
-    DIAGNOSIS_WORD[review.baseline.diagnosis],
-    DIAGNOSIS_WORD[review.candidate.diagnosis],
+    say(DIAGNOSIS_WORD, review.baseline.diagnosis, esc),
+    say(DIAGNOSIS_WORD, review.candidate.diagnosis, esc),
     "",
     "",
     "",
     ""
   ]);
-  const table2 = {
-    header: [
-      "Component",
-      "Baseline",
-      "Candidate",
-      "\u0394",
-      `${levelPercent(review)}% interval`,
-      "p",
-      "Call"
-    ],
-    align: ["l", "r", "r", "r", "r", "r", "l"],
-    rows
-  };
-  if (!compact) return table2;
-  const shorter = (row) => [
-    ...row.slice(0, 5),
-    (row[6] ?? "").replace(/^(up|down) \((\w+)\)$/, "$2")
-  ];
   return {
-    header: shorter(table2.header),
-    align: ["l", "r", "r", "r", "r", "l"],
-    rows: table2.rows.map(shorter)
+    header: [...header, "p", "Call"],
+    align: ["l", "r", "r", "r", "r", "r", "l"],
+    rows,
+    units
   };
 }
-function unavailableNotes(review, esc) {
-  const seen = /* @__PURE__ */ new Set();
-  for (const run of ["baseline", "candidate"]) {
-    for (const name of COMPONENT_ORDER) {
-      const c = review[run].components[name];
-      if (c.value === null && c.unavailable !== void 0) {
-        seen.add(`${COMPONENT_WORD[name]}: ${esc(c.unavailable, 300)}`);
-      }
-    }
-  }
-  return [...seen];
+function diagnosisLine(review, esc) {
+  return `Diagnosis: baseline ${say(DIAGNOSIS_WORD, review.baseline.diagnosis, esc)}; candidate ${say(DIAGNOSIS_WORD, review.candidate.diagnosis, esc)}.`;
 }
 function leversTable(review, esc) {
+  const f = numberFormatFor(review);
   return {
-    header: ["#", "Lever", "Why", "Evidence"],
-    align: ["r", "l", "l", "l"],
-    rows: review.levers.map((lever, i) => [
-      String(i + 1),
-      LEVER_TITLE[lever.id],
-      esc(lever.reason, 300),
-      lever.evidence.map((e) => esc(e, 200)).join(" \xB7 ") || "\u2014"
-    ])
+    header: ["#", "Lever", "Why"],
+    align: ["r", "l", "l"],
+    rows: review.levers.map((lever, i) => {
+      const text2 = leverText(lever, review, f, esc);
+      return [String(i + 1), text2.title, text2.sentences.join(" ") || "\u2014"];
+    })
   };
 }
 function sliceHarm(slice, review) {
@@ -23077,29 +23376,46 @@ function sortSlices(review) {
     (a, b) => rank(a) - rank(b) || sliceHarm(b, review) - sliceHarm(a, review) || (a.name < b.name ? -1 : a.name > b.name ? 1 : 0)
   );
 }
+var SLICE_CHANGE = /* @__PURE__ */ new Map([
+  ["worse", "worse"],
+  ["better", "better"],
+  ["flat", "flat"]
+]);
 function slicesTable(review, esc, limit) {
   const f = numberFormatFor(review);
   const rows = sortSlices(review).slice(0, limit).map((s) => [
     esc(s.name),
     s.examples === null ? "n/a" : count(s.examples),
-    num(s.baseline, f),
-    num(s.candidate, f),
-    signed(s.delta.estimate, f),
-    s.pAdjusted === null ? "n/a" : pValue(s.pAdjusted).replace(/^p /, "").replace(/^= /, ""),
-    s.hiddenRegression ? "worse (hidden)" : s.change
+    valueCell(s.baseline, f),
+    valueCell(s.candidate, f),
+    changeCell(s.delta.estimate, f),
+    pCell(s.pAdjusted),
+    s.hiddenRegression ? "worse (hidden)" : SLICE_CHANGE.get(s.change) ?? esc(s.change, 20)
   ]);
   return {
     header: ["Slice", "Examples", "Baseline", "Candidate", "\u0394", "p (Holm)", "Change"],
     align: ["l", "r", "r", "r", "r", "r", "l"],
-    rows
+    rows,
+    units: unitLine(f, "values")
   };
 }
-function sliceCounts(slices) {
+function sliceCounts(slices2) {
   const out = { worse: 0, better: 0, flat: 0 };
-  for (const s of slices) out[s.change] += 1;
+  for (const s of slices2) {
+    if (s.change === "worse") out.worse += 1;
+    else if (s.change === "better") out.better += 1;
+    else out.flat += 1;
+  }
   return out;
 }
 var MAX_HYPERPARAMETER_ROWS = 50;
+var HYPERPARAMETER_CHANGE = /* @__PURE__ */ new Map([
+  ["raised", "raised"],
+  ["lowered", "lowered"],
+  ["changed", "changed"],
+  ["added", "added"],
+  ["removed", "removed"]
+]);
 function hyperparameterTable(review, esc) {
   return {
     header: ["Hyperparameter", "Baseline", "Candidate", "Change"],
@@ -23108,71 +23424,84 @@ function hyperparameterTable(review, esc) {
       esc(h.key),
       h.kind === "added" ? "(absent)" : esc(displayValue(h.baseline), 60),
       h.kind === "removed" ? "(absent)" : esc(displayValue(h.candidate), 60),
-      h.kind
+      HYPERPARAMETER_CHANGE.get(h.kind) ?? esc(h.kind, 20)
     ])
   };
 }
 
 // src/report/headline.ts
-function changePhrase(name, delta, review) {
-  const f = numberFormatFor(review);
+function changePhrase(name, delta, review, f) {
   if (delta === null) return `${name} unknown`;
-  const level = levelPercent(review);
-  const stats = delta.ci === null ? `${signed(delta.estimate, f)}, noise unknown` : `${signed(delta.estimate, f)}, ${level}% interval ${interval(delta.ci, f)}, ${pValue(delta.p)}`;
+  const stats = delta.ci === null ? `${change(delta.estimate, f)}, noise unknown` : `${change(delta.estimate, f)}, ${levelPercent(review)}% interval ${changeInterval(delta.ci, f)}, ${pText(delta.p)}`;
   const word = delta.call === "up" ? "rose" : delta.call === "down" ? "fell" : "held steady";
   return `${name} ${word} (${stats})`;
 }
+var GOOD_MOVEMENTS = /* @__PURE__ */ new Set([
+  "better-on-both",
+  "away-from-overfitting",
+  "away-from-underfitting"
+]);
 function buildHeadline(review, esc) {
   const f = numberFormatFor(review);
   const metric = esc(review.metric.name, 60);
   const v = review.validation;
-  const vBase = review.splits.find((s) => s.split === "validation");
-  const movementTone = review.movement === "better-on-both" || review.movement === "away-from-overfitting" || review.movement === "away-from-underfitting" ? "good" : review.movement === "no-significant-change" ? "neutral" : "bad";
+  const vSplit = review.splits.find((s) => s.split === "validation");
+  const movementTone = GOOD_MOVEMENTS.has(review.movement) ? "good" : review.movement === "no-significant-change" ? "neutral" : "bad";
   const vTone = v.change === "better" ? "good" : v.change === "worse" ? "bad" : "neutral";
-  const level = levelPercent(review);
-  const vStats = v.delta.ci === null ? `\u0394 ${signed(v.delta.estimate, f)}; run-to-run noise unknown` : `\u0394 ${signed(v.delta.estimate, f)}, ${level}% interval ${interval(v.delta.ci, f)}, ${pValue(v.delta.p)}, ${TEST_WORD[v.delta.test]}`;
-  const from = vBase === void 0 ? "" : `${num(vBase.baseline, f)} \u2192 ${num(vBase.candidate, f)} `;
+  const vStats = v.delta.ci === null ? `${change(v.delta.estimate, f)}; run-to-run noise unknown` : `${change(v.delta.estimate, f)}, ${levelPercent(review)}% interval ${changeInterval(v.delta.ci, f)}, ${pText(v.delta.p)}, ${say(TEST_WORD, v.delta.test, esc)}`;
+  const from = vSplit === void 0 ? "" : `${value(vSplit.baseline, f)} \u2192 ${value(vSplit.candidate, f)} `;
   const lines = [
     {
-      label: MOVEMENT_SENTENCE[review.movement],
-      text: `${changePhrase(
-        "avoidable bias",
-        review.bias.delta,
-        review
-      )}; ${changePhrase("variance", review.variance.delta, review)}. Diagnosis: baseline ${DIAGNOSIS_WORD[review.baseline.diagnosis]}, candidate ${DIAGNOSIS_WORD[review.candidate.diagnosis]}.`,
+      label: say(MOVEMENT_SENTENCE, review.movement, esc),
+      text: `${changePhrase("avoidable bias", review.bias.delta, review, f)}; ${changePhrase(
+        "variance",
+        review.variance.delta,
+        review,
+        f
+      )}. Diagnosis: baseline ${say(DIAGNOSIS_WORD, review.baseline.diagnosis, esc)}, candidate ${say(
+        DIAGNOSIS_WORD,
+        review.candidate.diagnosis,
+        esc
+      )}.`,
       tone: movementTone
     },
     {
-      label: `Validation ${metric} ${VALIDATION_WORD[v.change]}`,
-      text: `${from}(${vStats}).`,
+      label: `Validation ${metric} ${say(VALIDATION_WORD, v.change, esc)}`,
+      text: `${from}(\u0394 ${vStats}).`,
       tone: vTone
+    },
+    {
+      label: review.gate.pass ? "Gate passed" : "Gate failed",
+      text: gateSentence(review, esc),
+      tone: review.gate.pass ? "good" : "bad"
     }
   ];
-  const gate = review.gate;
-  lines.push({
-    label: gate.pass ? "Gate passed" : "Gate failed",
-    text: gate.pass ? gate.failOn.length === 0 ? "no fail-on policy is set." : `none of fail-on (${gate.failOn.map((p) => esc(p, 60)).join(", ")}) applies.` : `${gate.reasons.map((r) => esc(r, 200)).join("; ")}.`,
-    tone: gate.pass ? "good" : "bad"
-  });
   const first = review.levers[0];
-  lines.push(
-    first === void 0 ? { label: "Next lever", text: "none suggested.", tone: "neutral" } : {
-      label: `Next lever: ${LEVER_TITLE[first.id]}`,
-      text: esc(first.reason, 300),
+  if (first === void 0)
+    lines.push({ label: "Next lever", text: "none suggested.", tone: "neutral" });
+  else {
+    const text2 = leverText(first, review, f, esc);
+    lines.push({
+      label: `Next lever: ${text2.title}`,
+      text: text2.sentences.join(" ") || "\u2014",
       tone: "neutral"
-    }
-  );
+    });
+  }
   const hidden = sortSlices(review).filter((s) => s.hiddenRegression);
   const worst = hidden[0];
   if (worst !== void 0) {
     lines.push({
       label: `${hidden.length} ${hidden.length === 1 ? "slice" : "slices"} got worse while validation improved`,
-      text: `worst: ${esc(worst.name, 60)} (${signed(worst.delta.estimate, f)}).`,
+      text: `worst: ${esc(worst.name, 60)} (${value(worst.baseline, f)} \u2192 ${value(worst.candidate, f)}, ${change(worst.delta.estimate, f)}).`,
       tone: "bad"
     });
   }
-  const title = `${MOVEMENT_TITLE[review.movement]} \xB7 validation ${VALIDATION_WORD[v.change]} \xB7 gate ${gate.pass ? "passed" : "failed"}`;
-  return { title, tone: gate.pass ? movementTone : "bad", lines };
+  const title = `${say(MOVEMENT_TITLE, review.movement, esc)} \xB7 validation ${say(
+    VALIDATION_WORD,
+    v.change,
+    esc
+  )} \xB7 gate ${review.gate.pass ? "passed" : "failed"}`;
+  return { title, tone: review.gate.pass ? movementTone : "bad", lines };
 }
 
 // src/report/marker.ts
@@ -23234,8 +23563,8 @@ function planeChart(review) {
     ...points.map(([run, b, v]) => `  "${run}": [${axis(b)}, ${axis(v)}]`)
   ];
   const metric = escapeInline(review.metric.name, 40);
-  const values = points.map(([run, b, v]) => `${run} bias ${num(b, format)}, variance ${num(v, format)}`).join("; ");
-  const caption = `**Bias/variance plane** (${metric}, shortfall units). Each axis is scaled so that its middle line is the presence threshold, ${num(t, format)} (gap tolerance ${short(review.settings.gapTolerance)} \xD7 the mean validation error level); right of it avoidable bias is large enough to count, above it variance. Values: ${values}.`;
+  const values = points.map(([run, b, v]) => `${run} bias ${difference(b, format)}, variance ${difference(v, format)}`).join("; ");
+  const caption = `**Bias/variance plane** (${metric}, shortfall units). Each axis is scaled so that its middle line is the presence threshold, ${difference(t, format)} (gap tolerance ${short(review.settings.gapTolerance)} \xD7 the mean validation error level); right of it avoidable bias is large enough to count, above it variance. Values: ${values}.`;
   return { kind: "plane", caption, code: lines.join("\n") };
 }
 var CURVE_TEXT = {
@@ -23308,7 +23637,7 @@ function curveCharts(review, curve) {
     return [lineChart(review, curve, series, [range[0], range[1]], yRange, run)];
   });
 }
-function lineChart(review, curve, series, [lo, hi], [yMin, yMax], only) {
+function lineChart(review, curve, series, [lo, hi], yRange, only) {
   const text2 = CURVE_TEXT[curve];
   const ordered = orderSeries(series);
   const xs = [
@@ -23316,13 +23645,16 @@ function lineChart(review, curve, series, [lo, hi], [yMin, yMax], only) {
   ].sort((a, b) => a - b);
   const geometric = curve !== "epochs" && lo > 0 && hi / lo >= 10;
   const grid = geometric ? thin(xs, MAX_POINTS) : evenGrid(lo, hi, Math.min(MAX_POINTS, xs.length));
+  const percent = review.metric.kind === "proportion";
+  const yScale = percent ? 100 : 1;
+  const [yMin, yMax] = [yRange[0] * yScale, yRange[1] * yScale];
   const yPad = (yMax - yMin) * 0.05 || Math.abs(yMax) * 0.05 || 1;
   const y0 = yMin - yPad;
   const y1 = yMax + yPad;
   const yDecimals = Math.min(6, Math.max(0, 2 - Math.floor(Math.log10(y1 - y0))));
   const xDecimals = Number.isInteger(lo) && Number.isInteger(hi) ? 0 : Math.min(6, Math.max(0, 2 - Math.floor(Math.log10(Math.max(hi - lo, 1e-9)))));
   const metric = mermaidLabel(review.metric.name, 40) || "metric";
-  const unit = review.metric.kind === "proportion" ? "proportion" : "metric units";
+  const unit2 = percent ? "%" : "metric units";
   const title = only === null ? text2.title : `${text2.title}, ${only}`;
   const palette = ordered.map((s) => PALETTE[paletteKey(s)][0]).join(", ");
   const lines = [
@@ -23330,9 +23662,9 @@ function lineChart(review, curve, series, [lo, hi], [yMin, yMax], only) {
     "xychart-beta",
     `  title "${title}"`,
     geometric ? `  x-axis "${text2.x}" [${grid.map((x) => `"${short(x)}"`).join(", ")}]` : `  x-axis "${text2.x}" ${chartNumber(lo, xDecimals)} --> ${chartNumber(hi, xDecimals)}`,
-    `  y-axis "${metric} (${unit})" ${chartNumber(y0, yDecimals)} --> ${chartNumber(y1, yDecimals)}`,
+    `  y-axis "${metric} (${unit2})" ${chartNumber(y0, yDecimals)} --> ${chartNumber(y1, yDecimals)}`,
     ...ordered.map(
-      (s) => `  line [${grid.map((x) => chartNumber(interpolate(s.points, x, geometric), yDecimals + 1)).join(", ")}]`
+      (s) => `  line [${grid.map((x) => chartNumber(yScale * interpolate(s.points, x, geometric), yDecimals + 1)).join(", ")}]`
     )
   ];
   const legend = ordered.map((s) => `${PALETTE[paletteKey(s)][1]} = ${s.run} ${s.part}`).join(", ");
@@ -23383,11 +23715,89 @@ function interpolate(points, x, logX) {
 }
 
 // src/report/notes.ts
+function names(list, total, esc) {
+  return `${list.map((n) => esc(n, 60)).join(", ")}${total > list.length ? ", \u2026" : ""}`;
+}
+function slices(n) {
+  return `${count(n)} ${n === 1 ? "slice" : "slices"}`;
+}
+function noteSentence(note, review, f, esc) {
+  switch (note.code) {
+    case "train-dev-in-one-run":
+      return "Only one run has a train-dev split: the variance change is measured as validation \u2212 train in both.";
+    case "unpaired-slices":
+      return `${slices(note.count)} appear in one run only and were not compared: ${names(note.names, note.count, esc)}.`;
+    case "hidden-regressions":
+      return `Validation improved overall, yet ${slices(note.count)} regressed significantly (Holm-adjusted): ${names(note.names, note.count, esc)}.`;
+    case "noise-unknown":
+      return review.settings.minEffect > 0 ? `Run-to-run noise is unknown (one repeat of a continuous metric, no per-example predictions): changes are called on size alone (min-effect ${amount(review.settings.minEffect, f)}).` : "Run-to-run noise is unknown (one repeat of a continuous metric, no per-example predictions) and min-effect is 0: no change can be called. Add repeats (seeds), per-example predictions, or set min-effect.";
+    case "bias-unknown":
+      return "Avoidable bias is unknown: there is no reference level for this metric. Its change is still measured from the training error; the diagnosis rests on variance and data mismatch.";
+    case "predictions-share-no-id":
+      return "The two predictions files share no id: the paired test was not used.";
+    case "predictions-in-one-run":
+      return "Only one run ships per-example predictions: no paired test.";
+    case "predictions-split-mismatch":
+      return `The predictions are for different splits (${say(SPLIT_WORD, note.baseline, esc)} in the baseline, ${say(SPLIT_WORD, note.candidate, esc)} in the candidate): no paired test.`;
+    case "predictions-unmatched":
+      return `Predictions paired by id: ${count(note.rows)} rows in both; ${count(note.baseline)} baseline and ${count(note.candidate)} candidate rows had no partner and were left out of the paired test.`;
+    case "epoch-log-not-used":
+      return `${esc(note.file, 120)}: the artifact has its own epoch curve; the epoch log ${esc(note.log, 120)} was not used.`;
+    case "epoch-log-missing":
+      return `No epoch log ${esc(note.log, 120)} next to ${esc(note.file, 120)}; the config's epoch-log mapping was not applied to it.`;
+    default:
+      return esc(String(note.code), 60);
+  }
+}
+var NON_LEVER = /* @__PURE__ */ new Map([
+  [
+    "smaller-training-set",
+    "A smaller training set is not a cure for high bias: it only lowers the training error, while validation error stays high or rises."
+  ]
+]);
+var WARNING = /* @__PURE__ */ new Map([
+  [
+    "validation-overfit",
+    "test error is well above validation error: model choices may be tuned to the validation set."
+  ]
+]);
+function reviewNotes2(review, f, esc) {
+  return [
+    ...["baseline", "candidate"].flatMap(
+      (run) => review[run].warnings.map((w) => `${run}: ${say(WARNING, w, esc)}`)
+    ),
+    ...review.notes.map((n) => noteSentence(n, review, f, esc)),
+    ...review.nonLevers.map((n) => say(NON_LEVER, n, esc))
+  ];
+}
+var UNAVAILABLE2 = /* @__PURE__ */ new Map([
+  [
+    "no-reference",
+    "no reference level: give `reference` in the artifact or the config (human-level error, a prior system, or an estimated Bayes error)."
+  ],
+  ["no-train-dev", "needs a train-dev split (held-out data from the training distribution)."],
+  ["no-test", "needs a test split."]
+]);
+function unavailableNotes(review, esc) {
+  const seen = /* @__PURE__ */ new Set();
+  for (const run of ["baseline", "candidate"]) {
+    for (const name of COMPONENT_ORDER) {
+      const c = review[run].components[name];
+      if (c.value === null && c.unavailable !== void 0) {
+        seen.add(`${say(COMPONENT_TITLE, name, esc)}: ${say(UNAVAILABLE2, c.unavailable, esc)}`);
+      }
+    }
+  }
+  return [...seen];
+}
+
+// src/report/method.ts
 function methodNotes(review, esc) {
+  const f = numberFormatFor(review);
   const s = review.settings;
   const lines = [
     `alpha = ${short(s.alpha)}: a change counts as up or down only when it is significant at this level and at least min-effect in size; intervals are ${levelPercent(review)}%.`,
-    `min-effect = ${short(s.minEffect)} (${review.metric.kind === "proportion" ? "proportion" : "metric units"}): smaller changes are called flat however significant.`,
+    `min-effect = ${amount(s.minEffect, f)}: smaller changes are called flat however significant.`,
     `gap tolerance = ${short(s.gapTolerance)}: a component is present when it is at least this share of the run's validation error level (and at least min-effect, and significantly above 0 where its noise is known).`,
     `fail-on = ${s.failOn.length === 0 ? "(empty: the gate always passes)" : s.failOn.map((p) => esc(p, 60)).join(", ")}.`
   ];
@@ -23401,13 +23811,10 @@ function methodNotes(review, esc) {
   use("variance", review.variance.delta);
   use("data mismatch", review.mismatch.delta);
   use("validation overfit", review.overfit.delta);
-  for (const split of review.splits) use(`${SPLIT_WORD[split.split]} split`, split.delta);
-  if (review.slices.length > 0) {
-    const tests = [...new Set(review.slices.map((x) => x.delta.test))];
-    for (const t of tests) uses.set(t, [...uses.get(t) ?? [], "slices"]);
-  }
+  for (const split of review.splits) use(`${say(SPLIT_WORD, split.split, esc)} split`, split.delta);
+  for (const slice of review.slices) use("slices", slice.delta);
   for (const [test, what] of uses) {
-    lines.push(`${[...new Set(what)].join(", ")}: ${TEST_WHY[test]}`);
+    lines.push(`${[...new Set(what)].join(", ")}: ${say(TEST_WHY, test, esc)}`);
   }
   if (review.slices.length > 0) {
     lines.push(
@@ -23421,36 +23828,29 @@ function methodNotes(review, esc) {
     );
   }
   for (const run of ["baseline", "candidate"]) {
-    const r = review[run];
-    lines.push(referenceLine(run, r, review));
-    for (const w of r.warnings) lines.push(`${run}: ${esc(w, 300)}`);
+    lines.push(referenceLine(run, review[run], f, esc));
   }
-  for (const n of review.notes) lines.push(esc(n, 300));
-  for (const n of review.nonLevers) lines.push(esc(n, 300));
+  lines.push(...reviewNotes2(review, f, esc));
   return lines;
 }
-function referenceLine(run, r, review) {
-  const f = numberFormatFor(review);
+function referenceLine(run, r, f, esc) {
   if (r.reference === null) {
     return `${run}: no reference level, so avoidable bias is unknown; set \`reference\` in the artifact or the config.`;
   }
-  const source = {
-    artifact: "from the artifact",
-    config: "from the config",
-    default: "the default for a minimized proportion",
-    unknown: "source unknown"
-  }[r.referenceSource];
-  return `${run}: reference level ${num(r.reference, f)} (${source}).`;
+  return `${run}: reference level ${value(r.reference, f)} (${say(REFERENCE_SOURCE, r.referenceSource, esc)}).`;
 }
-var CURVE_WORD = {
-  epochs: "Epoch curve",
-  training_examples: "Learning curve",
-  regularization: "Regularization curve"
-};
-function skipped(e) {
+function skippedText(e) {
+  return e.skipped === "fit-failed" ? "the power-law fit did not converge" : `needs at least ${count(e.needs)} points, has ${count(e.points)}`;
+}
+var SIDE_WORD = /* @__PURE__ */ new Map([
+  ["below", "below"],
+  ["above", "above"],
+  ["at", "at"]
+]);
+function isSkipped2(e) {
   return "skipped" in e;
 }
-function curveEvidence(review, esc) {
+function curveEvidence2(review) {
   const f = numberFormatFor(review);
   const lines = [];
   for (const run of ["baseline", "candidate"]) {
@@ -23458,22 +23858,27 @@ function curveEvidence(review, esc) {
     const e = curves.epochs;
     if (e !== void 0) {
       lines.push(
-        skipped(e) ? `${run}, ${CURVE_WORD.epochs}: not analysed (${esc(e.skipped, 200)}).` : `${run}, ${CURVE_WORD.epochs}: lowest validation ${num(e.bestValidation, f)} at epoch ${short(e.bestX)}; final ${num(e.finalValidation, f)} at epoch ${short(e.finalX)}; ${e.gl === null ? "generalization loss undefined (best validation is 0)" : `generalization loss ${e.gl.toFixed(1)}%`}${e.pq === null ? "" : `, progress quotient ${e.pq.toFixed(2)}`}${e.stoppedLate ? "; trained past the minimum" : ""}${e.stoppedEarly ? "; still improving at the end" : ""}.`
+        isSkipped2(e) ? `${run}, epoch curve: not analysed (${skippedText(e)}).` : `${run}, epoch curve: lowest validation ${value(e.bestValidation, f)} at epoch ${short(e.bestX)}; final ${value(e.finalValidation, f)} at epoch ${short(e.finalX)}; ${e.gl === null ? "generalization loss undefined (best validation is 0)" : `generalization loss ${fixed(e.gl, 1)}%`}${e.pq === null ? "" : `, progress quotient ${fixed(e.pq, 2)}`}${e.stoppedLate ? "; trained past the minimum" : ""}${e.stoppedEarly ? "; still improving at the end" : ""}.`
       );
     }
     const l = curves.training_examples;
     if (l !== void 0) {
-      const lp = skipped(l) ? "" : l.projections.map(
-        (p) => `${short(p.x)} examples \u2192 ${num(p.validation, f)} [${num(p.ci[0], f)}, ${num(p.ci[1], f)}]`
-      ).join("; ");
-      lines.push(
-        skipped(l) ? `${run}, ${CURVE_WORD.training_examples}: not analysed (${esc(l.skipped, 200)}).` : `${run}, ${CURVE_WORD.training_examples}: power-law fit R\xB2 ${l.r2.toFixed(3)}, residual sd ${num(l.residual, f)}; projected validation: ${lp || "none"}; train/validation gap ${l.gapTrend}.`
-      );
+      if (isSkipped2(l)) lines.push(`${run}, learning curve: not analysed (${skippedText(l)}).`);
+      else {
+        const projected = l.projections.map((p) => `${count(p.x)} examples \u2192 ${value(p.validation, f)} (${valueRange(p.ci, f)})`).join("; ");
+        lines.push(
+          `${run}, learning curve: power-law fit R\xB2 ${fixed(l.r2, 3)}, residual sd ${amount(l.residual, f)}; projected validation: ${projected || "none"}; train/validation gap ${l.gapTrend === "closing" ? "closing" : l.gapTrend === "flat" ? "flat" : "unknown"}.`
+        );
+      }
     }
     const g = curves.regularization;
-    if (g !== void 0) {
+    if (g !== void 0 && isSkipped2(g))
+      lines.push(`${run}, regularization curve: not analysed (${skippedText(g)}).`);
+    else if (g !== void 0) {
+      const side = SIDE_WORD.get(g.side) ?? "at an unknown place relative to";
+      const edge = g.atEdge === null ? "" : `; the minimum is at the ${g.atEdge === "low" ? "low" : "high"} end of the sweep, so extend it`;
       lines.push(
-        skipped(g) ? `${run}, ${CURVE_WORD.regularization}: not analysed (${esc(g.skipped, 200)}).` : `${run}, ${CURVE_WORD.regularization}: lowest validation ${num(g.bestValidation, f)} at strength ${short(g.bestX)}; the run's own strength is ${g.side === "at" ? "at" : g.side === "unknown" ? "at an unknown place relative to" : g.side} the best; suggested ${short(g.suggestedX)}${g.atEdge === null ? "" : `; the minimum is at the ${g.atEdge} end of the sweep, so extend it`}.`
+        `${run}, regularization curve: lowest validation ${value(g.bestValidation, f)} at strength ${short(g.bestX)}; the run's own strength is ${side} the best; suggested ${short(g.suggestedX)}${edge}.`
       );
     }
   }
@@ -23551,7 +23956,10 @@ Too large for this space: see the JSON report.
   return stub.length <= target ? stub : stub.slice(0, Math.max(0, target));
 }
 function table(t) {
-  return markdownTable([t.header, ...t.rows], { align: t.align, alignDelimiters: false });
+  const body = markdownTable([t.header, ...t.rows], { align: t.align, alignDelimiters: false });
+  return t.units === void 0 || t.units === null ? body : `${t.units}
+
+${body}`;
 }
 function details(summary, body) {
   return ["<details>", `<summary>${summary}</summary>`, "", ...body, "", "</details>", ""];
@@ -23567,8 +23975,8 @@ function headlineBlock(review) {
 }
 function compose(review, { marker, files, charts }, d) {
   const out = [marker, ...headlineBlock(review)];
-  out.push("### Splits", "", table(splitsTable(review)), "");
-  out.push("### Error decomposition", "", table(decompositionTable(review)), "");
+  out.push("### Splits", "", table(splitsTable(review, escapeInline)), "");
+  out.push("### Error decomposition", "", table(decompositionTable(review, escapeInline)), "");
   const missing = unavailableNotes(review, escapeInline);
   if (missing.length > 0) out.push(...missing.map((m) => `- ${m}`), "");
   if (review.levers.length > 0) {
@@ -23601,7 +24009,7 @@ function compose(review, { marker, files, charts }, d) {
     );
   }
   if (d.rest) {
-    const evidence = curveEvidence(review, escapeInline);
+    const evidence = curveEvidence2(review);
     if (evidence.length > 0)
       out.push(
         ...details(
@@ -23676,28 +24084,25 @@ function renderText(review, options) {
     }
     out.push(...rest);
   }
-  const splits = splitsTable(review);
+  const splits = splitsTable(review, esc);
   const fitted = naturalWidth(splits) > width ? withoutColumn(splits, "Reading") : splits;
   out.push("", heading("Splits"), ...textTable(fitted, width), "");
-  const decomposition = decompositionTable(review, true);
-  const diagnosis = decomposition.rows.pop();
-  out.push(heading("Error decomposition"), ...textTable(decomposition, width));
-  const notes = [
-    "* present: large enough to count.",
-    diagnosis === void 0 ? "" : `Diagnosis: baseline ${diagnosis[1]}; candidate ${diagnosis[2]}.`
-  ];
-  for (const n of notes.filter((x) => x !== "")) out.push(...wrap(n, width, "    ", "  "));
+  out.push(
+    heading("Error decomposition"),
+    ...textTable(decompositionTable(review, esc, true), width)
+  );
+  for (const n of ["* present: large enough to count.", diagnosisLine(review, esc)])
+    out.push(...wrap(n, width, "    ", "  "));
   for (const m of unavailableNotes(review, esc)) out.push(...wrap(m, width, "    ", "  - "));
   out.push("");
   if (review.levers.length > 0) {
     out.push(heading("Next levers"));
+    const f = numberFormatFor(review);
     review.levers.forEach((lever, i) => {
       const n = `${i + 1}. `;
       const pad = " ".repeat(n.length + 2);
-      out.push(
-        ...wrap(`${LEVER_TITLE[lever.id]}: ${esc(lever.reason, 300)}`, width, pad, `  ${n}`)
-      );
-      for (const e of lever.evidence) out.push(...wrap(esc(e, 200), width, `${pad}  `, `${pad}- `));
+      const text2 = leverText(lever, review, f, esc);
+      out.push(...wrap(`${text2.title}: ${text2.sentences.join(" ")}`, width, pad, `  ${n}`));
     });
     out.push("");
   }
@@ -23721,7 +24126,7 @@ function renderText(review, options) {
     );
     out.push("");
   }
-  const evidence = curveEvidence(review, esc);
+  const evidence = curveEvidence2(review);
   if (evidence.length > 0) {
     out.push(heading("Curve evidence"));
     for (const e of evidence) out.push(...wrap(e, width, "    ", "  - "));
@@ -23751,7 +24156,7 @@ function withoutColumn(t, header) {
   const c = t.header.indexOf(header);
   if (c < 0) return t;
   const drop = (row) => row.filter((_, i) => i !== c);
-  return { header: drop(t.header), align: drop(t.align), rows: t.rows.map(drop) };
+  return { ...t, header: drop(t.header), align: drop(t.align), rows: t.rows.map(drop) };
 }
 function wrap(text2, width, indent, first = indent) {
   const lines = [];
@@ -23799,7 +24204,8 @@ function textTable(t, width) {
     widths.map((_, c) => c),
     2
   );
-  return rows.map((r) => {
+  const units = t.units === void 0 || t.units === null ? [] : wrap(t.units, width, "  ");
+  const lines = rows.map((r) => {
     const cells = widths.map((w, c) => {
       const cell = truncate(r[c] ?? "", w);
       const pad = " ".repeat(Math.max(0, w - len(cell)));
@@ -23807,6 +24213,7 @@ function textTable(t, width) {
     });
     return `  ${cells.join("  ")}`.trimEnd();
   });
+  return [...units, ...lines];
 }
 
 // src/report/json.ts
@@ -23815,21 +24222,21 @@ function renderJson(review) {
   return `${JSON.stringify(review, null, 2)}
 `;
 }
-function assertFinite2(value, pointer) {
-  if (typeof value === "number") {
-    if (!Number.isFinite(value)) {
+function assertFinite2(value2, pointer) {
+  if (typeof value2 === "number") {
+    if (!Number.isFinite(value2)) {
       throw new RangeError(
-        `fitgap-review/1 ${pointer || "/"} is ${String(value)}; the review model must hold finite numbers only (this is a bug)`
+        `fitgap-review/1 ${pointer || "/"} is ${String(value2)}; the review model must hold finite numbers only (this is a bug)`
       );
     }
     return;
   }
-  if (Array.isArray(value)) {
-    value.forEach((item, i) => assertFinite2(item, `${pointer}/${i}`));
+  if (Array.isArray(value2)) {
+    value2.forEach((item, i) => assertFinite2(item, `${pointer}/${i}`));
     return;
   }
-  if (value !== null && typeof value === "object") {
-    for (const [key, item] of Object.entries(value)) {
+  if (value2 !== null && typeof value2 === "object") {
+    for (const [key, item] of Object.entries(value2)) {
       assertFinite2(item, `${pointer}/${key.replace(/~/g, "~0").replace(/\//g, "~1")}`);
     }
   }
@@ -23974,13 +24381,13 @@ async function demoCommand(argv, io) {
     io.stdout(DEMO_HELP);
     return EXIT.ok;
   }
-  const names = await listDemos(io.demoDir);
-  const first = names[0];
+  const names2 = await listDemos(io.demoDir);
+  const first = names2[0];
   if (first === void 0) throw new Error(`no demo candidates in ${io.demoDir}`);
   const name = positionals[0] ?? first;
-  if (!names.includes(name))
+  if (!names2.includes(name))
     throw new UsageError(
-      `fitgap demo: no demo named ${JSON.stringify(name)}; choose one of ${names.join(", ")}.`
+      `fitgap demo: no demo named ${JSON.stringify(name)}; choose one of ${names2.join(", ")}.`
     );
   const format = parseFormat(values["format"], "demo");
   const result = await reviewFiles({
@@ -23991,7 +24398,7 @@ async function demoCommand(argv, io) {
   });
   io.stdout(renderReview(result, format, { color: io.color }));
   if (format === "text") {
-    const others = names.filter((n) => n !== name);
+    const others = names2.filter((n) => n !== name);
     io.stdout(`
 Demo: Crumb & Co. baseline vs candidate "${name}". See the others with:
 `);
@@ -24185,14 +24592,14 @@ function readCsvLog(input, file, options = {}) {
       const cell = cells[c] ?? "";
       const s = series[c];
       if (c === xi || cell === "" || s === void 0) continue;
-      const value = parseDecimal(cell);
-      if (value === void 0 || !Number.isFinite(value)) {
+      const value2 = parseDecimal(cell);
+      if (value2 === void 0 || !Number.isFinite(value2)) {
         if (s.problems.length < 10)
           s.problems.push(notFinite(file, `line ${line}`, `column "${s.name}"`, cell));
         continue;
       }
       budget.take(file, `line ${line}`);
-      s.points.push({ x, value, at: line });
+      s.points.push({ x, value: value2, at: line });
     }
   }
   if (xIssues.length > 0) throw new InputError(xIssues);
@@ -24246,13 +24653,13 @@ var ProtoReader = class {
     const start = this.pos;
     const unsigned = this.varint();
     if (unsigned < 2 ** 53) return unsigned;
-    let value = 0n;
+    let value2 = 0n;
     let shift = 0n;
     for (let p = start; p < this.pos; p++) {
-      value |= BigInt(this.buf[p] & 127) << shift;
+      value2 |= BigInt(this.buf[p] & 127) << shift;
       shift += 7n;
     }
-    return Number(BigInt.asIntN(64, value));
+    return Number(BigInt.asIntN(64, value2));
   }
   /** Copies a fixed-width field into the scratch buffer (little-endian, as the wire is). */
   fixed(size) {
@@ -24379,13 +24786,13 @@ function readTfRecords(bytes, file) {
 
 // src/artifact/curve-logs/tensorboard.ts
 var DT = { float: 1, double: 2, int32: 3, int64: 9, half: 19 };
-function shortestFloat32(value) {
-  if (!Number.isFinite(value) || value === 0) return value;
-  for (let digits = 1; digits <= 9; digits++) {
-    const candidate = Number(value.toPrecision(digits));
-    if (Math.fround(candidate) === value) return candidate;
+function shortestFloat32(value2) {
+  if (!Number.isFinite(value2) || value2 === 0) return value2;
+  for (let digits2 = 1; digits2 <= 9; digits2++) {
+    const candidate = Number(value2.toPrecision(digits2));
+    if (Math.fround(candidate) === value2) return candidate;
   }
-  return value;
+  return value2;
 }
 function halfToNumber(bits) {
   const sign = bits & 32768 ? -1 : 1;
@@ -24515,7 +24922,7 @@ function readTensorBoard(bytes, file, options = {}) {
   const { records, truncatedAt } = readTfRecords(bytes, file);
   const byTag = /* @__PURE__ */ new Map();
   const otherPlugin = /* @__PURE__ */ new Set();
-  let skipped2 = 0;
+  let skipped = 0;
   const where = { kind: "record" };
   for (const record of records) {
     let event;
@@ -24537,7 +24944,7 @@ function readTensorBoard(bytes, file, options = {}) {
       if (v.plugin !== void 0 && v.plugin !== "scalars") otherPlugin.add(v.tag);
       if (v.tag === "" || otherPlugin.has(v.tag)) continue;
       if (v.value === void 0) {
-        skipped2++;
+        skipped++;
         continue;
       }
       let series = byTag.get(v.tag);
@@ -24569,7 +24976,7 @@ function readTensorBoard(bytes, file, options = {}) {
     }
   }
   const warnings = [];
-  if (skipped2 > 0) warnings.push({ code: "non-scalar-skipped", file, count: skipped2 });
+  if (skipped > 0) warnings.push({ code: "non-scalar-skipped", file, count: skipped });
   if (truncatedAt !== void 0)
     warnings.push({ code: "truncated-record", file, offset: truncatedAt });
   return { series: [...byTag.values()], warnings };
@@ -24606,21 +25013,21 @@ function readMlflowMetric(input, file, key, options = {}) {
         }
       ]);
     }
-    const value = parseDecimal(valueText ?? "");
-    if (value === void 0 || !Number.isFinite(value)) {
+    const value2 = parseDecimal(valueText ?? "");
+    if (value2 === void 0 || !Number.isFinite(value2)) {
       if (series.problems.length < 10)
         series.problems.push(notFinite(file, `line ${line}`, `metric "${key}"`, valueText ?? ""));
       continue;
     }
     budget.take(file, `line ${line}`);
-    series.points.push({ x: Number(stepText), value, at: line });
+    series.points.push({ x: Number(stepText), value: value2, at: line });
   }
   return { series: [series], warnings: [] };
 }
 
 // src/artifact/curve-logs/evals-result.ts
-function isObject(value) {
-  return typeof value === "object" && value !== null && !Array.isArray(value);
+function isObject(value2) {
+  return typeof value2 === "object" && value2 !== null && !Array.isArray(value2);
 }
 function escapePointer(segment) {
   return segment.replace(/~/g, "~0").replace(/\//g, "~1");
@@ -24657,7 +25064,7 @@ function readEvalsResult(input, file, options = {}) {
   if (!isObject(doc) || Object.keys(doc).length === 0)
     throw shape("", "must be an object of eval sets, each an object of metric arrays", doc);
   const series = [];
-  const names = /* @__PURE__ */ new Set();
+  const names2 = /* @__PURE__ */ new Set();
   for (const [set, metrics] of Object.entries(doc)) {
     const setPointer = `/${escapePointer(set)}`;
     if (!isObject(metrics))
@@ -24673,9 +25080,9 @@ function readEvalsResult(input, file, options = {}) {
       if (series.length >= MAX_SERIES)
         throw shape(path, `must hold at most ${MAX_SERIES} eval-set metrics`, metric);
       const name = `${set}/${metric}`;
-      if (names.has(name))
+      if (names2.has(name))
         throw shape(path, `must give a series name of its own, but "${name}" is taken`, metric);
-      names.add(name);
+      names2.add(name);
       const s = {
         name,
         file,
@@ -24684,19 +25091,19 @@ function readEvalsResult(input, file, options = {}) {
         points: [],
         problems: []
       };
-      values.forEach((value, i) => {
-        if (typeof value !== "number" || !Number.isFinite(value)) {
+      values.forEach((value2, i) => {
+        if (typeof value2 !== "number" || !Number.isFinite(value2)) {
           if (s.problems.length < 10)
             s.problems.push({
               file,
               pointer: `${path}/${i}`,
               expected: "must be a finite number",
-              got: quote(value)
+              got: quote(value2)
             });
           return;
         }
         budget.take(file, `${path}/${i}`);
-        s.points.push({ x: i + 1, value, at: i });
+        s.points.push({ x: i + 1, value: value2, at: i });
       });
       series.push(s);
     }
@@ -24838,7 +25245,7 @@ function parseName(name) {
 
 // src/artifact/curve-logs/units.ts
 var FAMILY = /* @__PURE__ */ new Map();
-var add = (family, names) => names.forEach((n) => FAMILY.set(n, family));
+var add = (family, names2) => names2.forEach((n) => FAMILY.set(n, family));
 add("accuracy", [
   "accuracy",
   "acc",
@@ -24893,10 +25300,10 @@ var CONVERSIONS = /* @__PURE__ */ new Map([
   ["mse>rmse", "sqrt"],
   ["rmse>mse", "square"]
 ]);
-function convert(conversion, value) {
-  if (conversion === "one-minus") return 1 - value;
-  if (conversion === "sqrt") return Math.sqrt(value);
-  return value * value;
+function convert(conversion, value2) {
+  if (conversion === "one-minus") return 1 - value2;
+  if (conversion === "sqrt") return Math.sqrt(value2);
+  return value2 * value2;
 }
 function matchScore(base, metric) {
   const b = normalizeMetricName(base.slice(base.lastIndexOf("/") + 1));
@@ -24961,15 +25368,15 @@ function guessPositional(g) {
   return train === void 0 || validation === void 0 ? void 0 : { train, validation };
 }
 function notFound(catalogue, name, series, flag) {
-  const names = series.map((s) => s.name);
-  const close = names.find((n) => n.toLowerCase() === name.toLowerCase());
-  const listed = names.slice(0, 12).map((n) => JSON.stringify(n)).join(", ");
+  const names2 = series.map((s) => s.name);
+  const close = names2.find((n) => n.toLowerCase() === name.toLowerCase());
+  const listed = names2.slice(0, 12).map((n) => JSON.stringify(n)).join(", ");
   return new InputError([
     {
       file: catalogue.file,
       pointer: catalogue.pointer,
       expected: `must have the ${catalogue.noun} "${name}" (${flag})`,
-      got: names.length === 0 ? "none" : `${listed}${names.length > 12 ? ", \u2026" : ""}`,
+      got: names2.length === 0 ? "none" : `${listed}${names2.length > 12 ? ", \u2026" : ""}`,
       hint: close !== void 0 ? `Names are case-sensitive: did you mean "${close}"?` : `Name one of the ${catalogue.noun}s listed.`
     }
   ]);
@@ -25497,9 +25904,9 @@ var FLAGS = {
 };
 var COMMAND = "curves import";
 function text(values, flag) {
-  const value = values[flag];
-  if (value === "") throw new UsageError(`fitgap ${COMMAND}: --${flag} must not be empty.`);
-  return typeof value === "string" ? value : void 0;
+  const value2 = values[flag];
+  if (value2 === "") throw new UsageError(`fitgap ${COMMAND}: --${flag} must not be empty.`);
+  return typeof value2 === "string" ? value2 : void 0;
 }
 async function curvesImportCommand(argv, io, fs = nodeCurveLogFs) {
   const { values, positionals } = parseFlags(argv, FLAGS, COMMAND);
@@ -25540,10 +25947,10 @@ async function curvesImportCommand(argv, io, fs = nodeCurveLogFs) {
     ...validation === void 0 ? {} : { validation },
     ...metric === void 0 ? {} : { metric }
   });
-  const epochs2 = curve.points.map(
+  const epochs = curve.points.map(
     (p) => p.train === void 0 ? { x: p.x, validation: p.validation } : { x: p.x, train: p.train, validation: p.validation }
   );
-  await io.writeFile(resolve4(io.cwd, out), `${JSON.stringify({ epochs: epochs2 }, null, 2)}
+  await io.writeFile(resolve4(io.cwd, out), `${JSON.stringify({ epochs }, null, 2)}
 `);
   for (const line of curveImportNotes(curve, out)) io.stderr(`fitgap: ${line}
 `);
@@ -25620,13 +26027,14 @@ var package_default = {
   scripts: {
     build: "node scripts/build.mjs",
     typecheck: "tsc --noEmit",
-    lint: "eslint . && prettier --check . && npm run -s lint:layers",
+    lint: "eslint . && prettier --check . && npm run -s lint:layers && node scripts/review-types.mjs --check",
     format: "prettier --write .",
     test: "vitest run && npm run -s test:python",
     "test:python": "${PYTHON:-python3} -m unittest discover -s python/tests -v",
     demo: "npm run -s build && node dist/cli.js demo",
     bench: "node scripts/bench.mjs",
-    "lint:layers": "depcruise src --config .dependency-cruiser.cjs"
+    "lint:layers": "depcruise src --config .dependency-cruiser.cjs",
+    "schema:types": "node scripts/review-types.mjs"
   },
   dependencies: {
     "@actions/core": "3.0.1",
@@ -25639,7 +26047,6 @@ var package_default = {
     fflate: "0.8.3",
     jstat: "1.9.6",
     "markdown-table": "3.1.0",
-    "ml-levenberg-marquardt": "5.1.0",
     yaml: "2.9.1"
   },
   devDependencies: {
@@ -25653,6 +26060,7 @@ var package_default = {
     eslint: "9.39.5",
     "fast-check": "4.11.0",
     jsdom: "29.1.1",
+    "json-schema-to-typescript": "^16.0.0",
     mermaid: "11.17.2",
     micromark: "4.0.3",
     "micromark-extension-gfm": "3.0.0",

@@ -854,7 +854,7 @@ var require_tree = __commonJS({
        * @param {any} value
        * @param {number} index
        */
-      constructor(key, value, index) {
+      constructor(key, value2, index) {
         if (index === void 0 || index >= key.length) {
           throw new TypeError("Unreachable");
         }
@@ -863,16 +863,16 @@ var require_tree = __commonJS({
           throw new TypeError("key must be ascii string");
         }
         if (key.length !== ++index) {
-          this.middle = new _TstNode(key, value, index);
+          this.middle = new _TstNode(key, value2, index);
         } else {
-          this.value = value;
+          this.value = value2;
         }
       }
       /**
        * @param {string} key
        * @param {any} value
        */
-      add(key, value) {
+      add(key, value2) {
         const length = key.length;
         if (length === 0) {
           throw new TypeError("Unreachable");
@@ -886,25 +886,25 @@ var require_tree = __commonJS({
           }
           if (node.code === code) {
             if (length === ++index) {
-              node.value = value;
+              node.value = value2;
               break;
             } else if (node.middle !== null) {
               node = node.middle;
             } else {
-              node.middle = new _TstNode(key, value, index);
+              node.middle = new _TstNode(key, value2, index);
               break;
             }
           } else if (node.code < code) {
             if (node.left !== null) {
               node = node.left;
             } else {
-              node.left = new _TstNode(key, value, index);
+              node.left = new _TstNode(key, value2, index);
               break;
             }
           } else if (node.right !== null) {
             node = node.right;
           } else {
-            node.right = new _TstNode(key, value, index);
+            node.right = new _TstNode(key, value2, index);
             break;
           }
         }
@@ -943,11 +943,11 @@ var require_tree = __commonJS({
        * @param {string} key
        * @param {any} value
        * */
-      insert(key, value) {
+      insert(key, value2) {
         if (this.node === null) {
-          this.node = new TstNode(key, value, 0);
+          this.node = new TstNode(key, value2, 0);
         } else {
-          this.node.add(key, value);
+          this.node.add(key, value2);
         }
       }
       /**
@@ -1048,11 +1048,11 @@ var require_util = __commonJS({
       return url;
     }
     function isValidPort(port) {
-      const value = parseInt(port, 10);
-      return value === Number(port) && value >= 0 && value <= 65535;
+      const value2 = parseInt(port, 10);
+      return value2 === Number(port) && value2 >= 0 && value2 <= 65535;
     }
-    function isHttpOrHttpsPrefixed(value) {
-      return value != null && value[0] === "h" && value[1] === "t" && value[2] === "t" && value[3] === "p" && (value[4] === ":" || value[4] === "s" && value[5] === ":");
+    function isHttpOrHttpsPrefixed(value2) {
+      return value2 != null && value2[0] === "h" && value2[1] === "t" && value2[2] === "t" && value2[3] === "p" && (value2[4] === ":" || value2[4] === "s" && value2[5] === ":");
     }
     function parseURL(url) {
       if (typeof url === "string") {
@@ -1176,11 +1176,11 @@ var require_util = __commonJS({
       const m = val.toString().match(KEEPALIVE_TIMEOUT_EXPR);
       return m ? parseInt(m[1], 10) * 1e3 : null;
     }
-    function headerNameToString(value) {
-      return typeof value === "string" ? headerNameLowerCasedRecord[value] ?? value.toLowerCase() : tree.lookup(value) ?? value.toString("latin1").toLowerCase();
+    function headerNameToString(value2) {
+      return typeof value2 === "string" ? headerNameLowerCasedRecord[value2] ?? value2.toLowerCase() : tree.lookup(value2) ?? value2.toString("latin1").toLowerCase();
     }
-    function bufferToLowerCasedHeaderName(value) {
-      return tree.lookup(value) ?? value.toString("latin1").toLowerCase();
+    function bufferToLowerCasedHeaderName(value2) {
+      return tree.lookup(value2) ?? value2.toString("latin1").toLowerCase();
     }
     function parseHeaders(headers, obj) {
       if (obj === void 0) obj = {};
@@ -1295,14 +1295,14 @@ var require_util = __commonJS({
             iterator2 = iterable[Symbol.asyncIterator]();
           },
           async pull(controller) {
-            const { done, value } = await iterator2.next();
+            const { done, value: value2 } = await iterator2.next();
             if (done) {
               queueMicrotask(() => {
                 controller.close();
                 controller.byobRequest?.respond(0);
               });
             } else {
-              const buf = Buffer.isBuffer(value) ? value : Buffer.from(value);
+              const buf = Buffer.isBuffer(value2) ? value2 : Buffer.from(value2);
               if (buf.byteLength) {
                 controller.enqueue(new Uint8Array(buf));
               }
@@ -1967,8 +1967,8 @@ var require_request = __commonJS({
           this.endHandler = null;
         }
       }
-      addHeader(key, value) {
-        processHeader(this, key, value);
+      addHeader(key, value2) {
+        processHeader(this, key, value2);
         return this;
       }
     };
@@ -2040,11 +2040,11 @@ var require_request = __commonJS({
       } else if (headerName === "transfer-encoding" || headerName === "keep-alive" || headerName === "upgrade") {
         throw new InvalidArgumentError(`invalid ${headerName} header`);
       } else if (headerName === "connection") {
-        const value = typeof val === "string" ? val.toLowerCase() : null;
-        if (value !== "close" && value !== "keep-alive") {
+        const value2 = typeof val === "string" ? val.toLowerCase() : null;
+        if (value2 !== "close" && value2 !== "keep-alive") {
           throw new InvalidArgumentError("invalid connection header");
         }
-        if (value === "close") {
+        if (value2 === "close") {
           request2.reset = true;
         }
       } else if (headerName === "expect") {
@@ -2709,9 +2709,9 @@ var require_utils = __commonJS({
     function enumToMap(obj) {
       const res = {};
       Object.keys(obj).forEach((key) => {
-        const value = obj[key];
-        if (typeof value === "number") {
-          res[key] = value;
+        const value2 = obj[key];
+        if (typeof value2 === "number") {
+          res[key] = value2;
         }
       });
       return res;
@@ -3524,11 +3524,11 @@ var require_data_url = __commonJS({
     }
     function collectAnHTTPQuotedString(input, position, extractValue) {
       const positionStart = position.position;
-      let value = "";
+      let value2 = "";
       assert(input[position.position] === '"');
       position.position++;
       while (true) {
-        value += collectASequenceOfCodePoints(
+        value2 += collectASequenceOfCodePoints(
           (char) => char !== '"' && char !== "\\",
           input,
           position
@@ -3540,10 +3540,10 @@ var require_data_url = __commonJS({
         position.position++;
         if (quoteOrBackslash === "\\") {
           if (position.position >= input.length) {
-            value += "\\";
+            value2 += "\\";
             break;
           }
-          value += input[position.position];
+          value2 += input[position.position];
           position.position++;
         } else {
           assert(quoteOrBackslash === '"');
@@ -3551,7 +3551,7 @@ var require_data_url = __commonJS({
         }
       }
       if (extractValue) {
-        return value;
+        return value2;
       }
       return input.slice(positionStart, position.position);
     }
@@ -3559,16 +3559,16 @@ var require_data_url = __commonJS({
       assert(mimeType !== "failure");
       const { parameters, essence } = mimeType;
       let serialization = essence;
-      for (let [name, value] of parameters.entries()) {
+      for (let [name, value2] of parameters.entries()) {
         serialization += ";";
         serialization += name;
         serialization += "=";
-        if (!HTTP_TOKEN_CODEPOINTS.test(value)) {
-          value = value.replace(/(\\|")/g, "\\$1");
-          value = '"' + value;
-          value += '"';
+        if (!HTTP_TOKEN_CODEPOINTS.test(value2)) {
+          value2 = value2.replace(/(\\|")/g, "\\$1");
+          value2 = '"' + value2;
+          value2 += '"';
         }
-        serialization += value;
+        serialization += value2;
       }
       return serialization;
     }
@@ -3841,11 +3841,11 @@ var require_webidl = __commonJS({
           });
         }
         while (true) {
-          const { done, value } = method.next();
+          const { done, value: value2 } = method.next();
           if (done) {
             break;
           }
-          seq.push(converter(value, prefix, `${argument}[${index++}]`));
+          seq.push(converter(value2, prefix, `${argument}[${index++}]`));
         }
         return seq;
       };
@@ -3913,20 +3913,20 @@ var require_webidl = __commonJS({
               });
             }
           }
-          let value = dictionary[key];
+          let value2 = dictionary[key];
           const hasDefault = Object.hasOwn(options, "defaultValue");
-          if (hasDefault && value !== null) {
-            value ??= defaultValue();
+          if (hasDefault && value2 !== null) {
+            value2 ??= defaultValue();
           }
-          if (required2 || hasDefault || value !== void 0) {
-            value = converter(value, prefix, `${argument}.${key}`);
-            if (options.allowedValues && !options.allowedValues.includes(value)) {
+          if (required2 || hasDefault || value2 !== void 0) {
+            value2 = converter(value2, prefix, `${argument}.${key}`);
+            if (options.allowedValues && !options.allowedValues.includes(value2)) {
               throw webidl.errors.exception({
                 header: prefix,
-                message: `${value} is not an accepted type. Expected one of ${options.allowedValues.join(", ")}.`
+                message: `${value2} is not an accepted type. Expected one of ${options.allowedValues.join(", ")}.`
               });
             }
-            dict[key] = value;
+            dict[key] = value2;
           }
         }
         return dict;
@@ -4137,8 +4137,8 @@ var require_util2 = __commonJS({
       }
       return true;
     }
-    function normalizeBinaryStringToUtf8(value) {
-      return Buffer.from(value, "binary").toString("utf8");
+    function normalizeBinaryStringToUtf8(value2) {
+      return Buffer.from(value2, "binary").toString("utf8");
     }
     function requestCurrentURL(request2) {
       return request2.urlList[request2.urlList.length - 1];
@@ -4499,8 +4499,8 @@ var require_util2 = __commonJS({
     function normalizeMethod(method) {
       return normalizedMethodRecordsBase[method.toLowerCase()] ?? method;
     }
-    function serializeJavascriptValueToJSONString(value) {
-      const result = JSON.stringify(value);
+    function serializeJavascriptValueToJSONString(value2) {
+      const result = JSON.stringify(value2);
       if (result === void 0) {
         throw new TypeError("Value is not JSON serializable");
       }
@@ -4541,7 +4541,7 @@ var require_util2 = __commonJS({
               done: true
             };
           }
-          const { [keyIndex]: key, [valueIndex]: value } = values[index];
+          const { [keyIndex]: key, [valueIndex]: value2 } = values[index];
           this.#index = index + 1;
           let result;
           switch (this.#kind) {
@@ -4549,10 +4549,10 @@ var require_util2 = __commonJS({
               result = key;
               break;
             case "value":
-              result = value;
+              result = value2;
               break;
             case "key+value":
-              result = [key, value];
+              result = [key, value2];
               break;
           }
           return {
@@ -4618,8 +4618,8 @@ var require_util2 = __commonJS({
                 `Failed to execute 'forEach' on '${name}': parameter 1 is not of type 'Function'.`
               );
             }
-            for (const { 0: key, 1: value } of makeIterator(this, "key+value")) {
-              callbackfn.call(thisArg, value, key, this);
+            for (const { 0: key, 1: value2 } of makeIterator(this, "key+value")) {
+              callbackfn.call(thisArg, value2, key, this);
             }
           }
         }
@@ -4696,8 +4696,8 @@ var require_util2 = __commonJS({
       const protocol = url.protocol;
       return protocol === "http:" || protocol === "https:";
     }
-    function simpleRangeHeaderValue(value, allowWhitespace) {
-      const data = value;
+    function simpleRangeHeaderValue(value2, allowWhitespace) {
+      const data = value2;
       if (!data.startsWith("bytes")) {
         return "failure";
       }
@@ -4815,8 +4815,8 @@ var require_util2 = __commonJS({
       if (values === null) {
         return "failure";
       }
-      for (const value of values) {
-        const temporaryMimeType = parseMIMEType(value);
+      for (const value2 of values) {
+        const temporaryMimeType = parseMIMEType(value2);
         if (temporaryMimeType === "failure" || temporaryMimeType.essence === "*/*") {
           continue;
         }
@@ -4836,8 +4836,8 @@ var require_util2 = __commonJS({
       }
       return mimeType;
     }
-    function gettingDecodingSplitting(value) {
-      const input = value;
+    function gettingDecodingSplitting(value2) {
+      const input = value2;
       const position = { position: 0 };
       const values = [];
       let temporaryValue = "";
@@ -4868,11 +4868,11 @@ var require_util2 = __commonJS({
       return values;
     }
     function getDecodeSplit(name, list) {
-      const value = list.get(name, true);
-      if (value === null) {
+      const value2 = list.get(name, true);
+      if (value2 === null) {
         return null;
       }
-      return gettingDecodingSplitting(value);
+      return gettingDecodingSplitting(value2);
     }
     var textDecoder = new TextDecoder();
     function utf8DecodeBytes(buffer) {
@@ -5055,19 +5055,19 @@ var require_formdata = __commonJS({
         }
         this[kState] = [];
       }
-      append(name, value, filename = void 0) {
+      append(name, value2, filename = void 0) {
         webidl.brandCheck(this, _FormData);
         const prefix = "FormData.append";
         webidl.argumentLengthCheck(arguments, 2, prefix);
-        if (arguments.length === 3 && !isBlobLike(value)) {
+        if (arguments.length === 3 && !isBlobLike(value2)) {
           throw new TypeError(
             "Failed to execute 'append' on 'FormData': parameter 2 is not of type 'Blob'"
           );
         }
         name = webidl.converters.USVString(name, prefix, "name");
-        value = isBlobLike(value) ? webidl.converters.Blob(value, prefix, "value", { strict: false }) : webidl.converters.USVString(value, prefix, "value");
+        value2 = isBlobLike(value2) ? webidl.converters.Blob(value2, prefix, "value", { strict: false }) : webidl.converters.USVString(value2, prefix, "value");
         filename = arguments.length === 3 ? webidl.converters.USVString(filename, prefix, "filename") : void 0;
-        const entry = makeEntry(name, value, filename);
+        const entry = makeEntry(name, value2, filename);
         this[kState].push(entry);
       }
       delete(name) {
@@ -5102,19 +5102,19 @@ var require_formdata = __commonJS({
         name = webidl.converters.USVString(name, prefix, "name");
         return this[kState].findIndex((entry) => entry.name === name) !== -1;
       }
-      set(name, value, filename = void 0) {
+      set(name, value2, filename = void 0) {
         webidl.brandCheck(this, _FormData);
         const prefix = "FormData.set";
         webidl.argumentLengthCheck(arguments, 2, prefix);
-        if (arguments.length === 3 && !isBlobLike(value)) {
+        if (arguments.length === 3 && !isBlobLike(value2)) {
           throw new TypeError(
             "Failed to execute 'set' on 'FormData': parameter 2 is not of type 'Blob'"
           );
         }
         name = webidl.converters.USVString(name, prefix, "name");
-        value = isBlobLike(value) ? webidl.converters.Blob(value, prefix, "name", { strict: false }) : webidl.converters.USVString(value, prefix, "name");
+        value2 = isBlobLike(value2) ? webidl.converters.Blob(value2, prefix, "name", { strict: false }) : webidl.converters.USVString(value2, prefix, "name");
         filename = arguments.length === 3 ? webidl.converters.USVString(filename, prefix, "name") : void 0;
-        const entry = makeEntry(name, value, filename);
+        const entry = makeEntry(name, value2, filename);
         const idx = this[kState].findIndex((entry2) => entry2.name === name);
         if (idx !== -1) {
           this[kState] = [
@@ -5158,21 +5158,21 @@ var require_formdata = __commonJS({
         configurable: true
       }
     });
-    function makeEntry(name, value, filename) {
-      if (typeof value === "string") {
+    function makeEntry(name, value2, filename) {
+      if (typeof value2 === "string") {
       } else {
-        if (!isFileLike(value)) {
-          value = value instanceof Blob ? new File([value], "blob", { type: value.type }) : new FileLike(value, "blob", { type: value.type });
+        if (!isFileLike(value2)) {
+          value2 = value2 instanceof Blob ? new File([value2], "blob", { type: value2.type }) : new FileLike(value2, "blob", { type: value2.type });
         }
         if (filename !== void 0) {
           const options = {
-            type: value.type,
-            lastModified: value.lastModified
+            type: value2.type,
+            lastModified: value2.lastModified
           };
-          value = value instanceof NativeFile ? new File([value], filename, options) : new FileLike(value, filename, options);
+          value2 = value2 instanceof NativeFile ? new File([value2], filename, options) : new FileLike(value2, filename, options);
         }
       }
-      return { name, value };
+      return { name, value: value2 };
     }
     module.exports = { FormData, makeEntry };
   }
@@ -5270,19 +5270,19 @@ var require_formdata_parser = __commonJS({
         } else {
           position.position += 2;
         }
-        let value;
+        let value2;
         if (filename !== null) {
           contentType ??= "text/plain";
           if (!isAsciiString(contentType)) {
             contentType = "";
           }
-          value = new File([body], filename, { type: contentType });
+          value2 = new File([body], filename, { type: contentType });
         } else {
-          value = utf8DecodeBytes(Buffer.from(body));
+          value2 = utf8DecodeBytes(Buffer.from(body));
         }
         assert(isUSVString(name));
-        assert(typeof value === "string" && isUSVString(value) || isFileLike(value));
-        entryList.push(makeEntry(name, value, filename));
+        assert(typeof value2 === "string" && isUSVString(value2) || isFileLike(value2));
+        entryList.push(makeEntry(name, value2, filename));
       }
     }
     function parseMultipartFormDataHeaders(input, position) {
@@ -5513,27 +5513,27 @@ var require_body = __commonJS({
         const prefix = `--${boundary}\r
 Content-Disposition: form-data`;
         const escape2 = (str) => str.replace(/\n/g, "%0A").replace(/\r/g, "%0D").replace(/"/g, "%22");
-        const normalizeLinefeeds = (value) => value.replace(/\r?\n|\r/g, "\r\n");
+        const normalizeLinefeeds = (value2) => value2.replace(/\r?\n|\r/g, "\r\n");
         const blobParts = [];
         const rn = new Uint8Array([13, 10]);
         length = 0;
         let hasUnknownSizeValue = false;
-        for (const [name, value] of object) {
-          if (typeof value === "string") {
+        for (const [name, value2] of object) {
+          if (typeof value2 === "string") {
             const chunk2 = textEncoder.encode(prefix + `; name="${escape2(normalizeLinefeeds(name))}"\r
 \r
-${normalizeLinefeeds(value)}\r
+${normalizeLinefeeds(value2)}\r
 `);
             blobParts.push(chunk2);
             length += chunk2.byteLength;
           } else {
-            const chunk2 = textEncoder.encode(`${prefix}; name="${escape2(normalizeLinefeeds(name))}"` + (value.name ? `; filename="${escape2(value.name)}"` : "") + `\r
-Content-Type: ${value.type || "application/octet-stream"}\r
+            const chunk2 = textEncoder.encode(`${prefix}; name="${escape2(normalizeLinefeeds(name))}"` + (value2.name ? `; filename="${escape2(value2.name)}"` : "") + `\r
+Content-Type: ${value2.type || "application/octet-stream"}\r
 \r
 `);
-            blobParts.push(chunk2, value, rn);
-            if (typeof value.size === "number") {
-              length += chunk2.byteLength + value.size + rn.byteLength;
+            blobParts.push(chunk2, value2, rn);
+            if (typeof value2.size === "number") {
+              length += chunk2.byteLength + value2.size + rn.byteLength;
             } else {
               hasUnknownSizeValue = true;
             }
@@ -5584,7 +5584,7 @@ Content-Type: ${value.type || "application/octet-stream"}\r
             iterator2 = action(object)[Symbol.asyncIterator]();
           },
           async pull(controller) {
-            const { value, done } = await iterator2.next();
+            const { value: value2, done } = await iterator2.next();
             if (done) {
               queueMicrotask(() => {
                 controller.close();
@@ -5592,7 +5592,7 @@ Content-Type: ${value.type || "application/octet-stream"}\r
               });
             } else {
               if (!isErrored(stream)) {
-                const buffer = new Uint8Array(value);
+                const buffer = new Uint8Array(value2);
                 if (buffer.byteLength) {
                   controller.enqueue(buffer);
                 }
@@ -5655,12 +5655,12 @@ Content-Type: ${value.type || "application/octet-stream"}\r
           return consumeBody(this, parseJSONFromBytes, instance);
         },
         formData() {
-          return consumeBody(this, (value) => {
+          return consumeBody(this, (value2) => {
             const mimeType = bodyMimeType(this);
             if (mimeType !== null) {
               switch (mimeType.essence) {
                 case "multipart/form-data": {
-                  const parsed = multipartFormDataParser(value, mimeType);
+                  const parsed = multipartFormDataParser(value2, mimeType);
                   if (parsed === "failure") {
                     throw new TypeError("Failed to parse body as FormData.");
                   }
@@ -5669,10 +5669,10 @@ Content-Type: ${value.type || "application/octet-stream"}\r
                   return fd2;
                 }
                 case "application/x-www-form-urlencoded": {
-                  const entries = new URLSearchParams(value.toString());
+                  const entries = new URLSearchParams(value2.toString());
                   const fd2 = new FormData();
-                  for (const [name, value2] of entries) {
-                    fd2.append(name, value2);
+                  for (const [name, value3] of entries) {
+                    fd2.append(name, value3);
                   }
                   return fd2;
                 }
@@ -6928,13 +6928,13 @@ var require_client_h2 = __commonJS({
     } = http2;
     function parseH2Headers(headers) {
       const result = [];
-      for (const [name, value] of Object.entries(headers)) {
-        if (Array.isArray(value)) {
-          for (const subvalue of value) {
+      for (const [name, value2] of Object.entries(headers)) {
+        if (Array.isArray(value2)) {
+          for (const subvalue of value2) {
             result.push(Buffer.from(name), Buffer.from(subvalue));
           }
         } else {
-          result.push(Buffer.from(name), Buffer.from(value));
+          result.push(Buffer.from(name), Buffer.from(value2));
         }
       }
       return result;
@@ -7852,8 +7852,8 @@ var require_client = __commonJS({
       get pipelining() {
         return this[kPipelining];
       }
-      set pipelining(value) {
-        this[kPipelining] = value;
+      set pipelining(value2) {
+        this[kPipelining] = value2;
         this[kResume](true);
       }
       get [kPending]() {
@@ -10682,15 +10682,15 @@ var require_mock_utils = __commonJS({
         isPromise
       }
     } = __require("node:util");
-    function matchValue(match, value) {
+    function matchValue(match, value2) {
       if (typeof match === "string") {
-        return match === value;
+        return match === value2;
       }
       if (match instanceof RegExp) {
-        return match.test(value);
+        return match.test(value2);
       }
       if (typeof match === "function") {
-        return match(value) === true;
+        return match(value2) === true;
       }
       return false;
     }
@@ -10831,14 +10831,14 @@ var require_mock_utils = __commonJS({
       const result = [];
       for (let i2 = 0; i2 < keys.length; ++i2) {
         const key = keys[i2];
-        const value = data[key];
+        const value2 = data[key];
         const name = Buffer.from(`${key}`);
-        if (Array.isArray(value)) {
-          for (let j = 0; j < value.length; ++j) {
-            result.push(name, Buffer.from(`${value[j]}`));
+        if (Array.isArray(value2)) {
+          for (let j = 0; j < value2.length; ++j) {
+            result.push(name, Buffer.from(`${value2[j]}`));
           }
         } else {
-          result.push(name, Buffer.from(`${value}`));
+          result.push(name, Buffer.from(`${value2}`));
         }
       }
       return result;
@@ -11988,25 +11988,25 @@ var require_headers = __commonJS({
         });
       }
     }
-    function appendHeader(headers, name, value) {
-      value = headerValueNormalize(value);
+    function appendHeader(headers, name, value2) {
+      value2 = headerValueNormalize(value2);
       if (!isValidHeaderName(name)) {
         throw webidl.errors.invalidArgument({
           prefix: "Headers.append",
           value: name,
           type: "header name"
         });
-      } else if (!isValidHeaderValue(value)) {
+      } else if (!isValidHeaderValue(value2)) {
         throw webidl.errors.invalidArgument({
           prefix: "Headers.append",
-          value,
+          value: value2,
           type: "header value"
         });
       }
       if (getHeadersGuard(headers) === "immutable") {
         throw new TypeError("immutable");
       }
-      return getHeadersList(headers).append(name, value, false);
+      return getHeadersList(headers).append(name, value2, false);
     }
     function compareHeaderName(a, b) {
       return a[0] < b[0] ? -1 : 1;
@@ -12043,7 +12043,7 @@ var require_headers = __commonJS({
        * @param {string} value
        * @param {boolean} isLowerCase
        */
-      append(name, value, isLowerCase) {
+      append(name, value2, isLowerCase) {
         this[kHeadersSortedMap] = null;
         const lowercaseName = isLowerCase ? name : name.toLowerCase();
         const exists2 = this[kHeadersMap].get(lowercaseName);
@@ -12051,13 +12051,13 @@ var require_headers = __commonJS({
           const delimiter = lowercaseName === "cookie" ? "; " : ", ";
           this[kHeadersMap].set(lowercaseName, {
             name: exists2.name,
-            value: `${exists2.value}${delimiter}${value}`
+            value: `${exists2.value}${delimiter}${value2}`
           });
         } else {
-          this[kHeadersMap].set(lowercaseName, { name, value });
+          this[kHeadersMap].set(lowercaseName, { name, value: value2 });
         }
         if (lowercaseName === "set-cookie") {
-          (this.cookies ??= []).push(value);
+          (this.cookies ??= []).push(value2);
         }
       }
       /**
@@ -12066,13 +12066,13 @@ var require_headers = __commonJS({
        * @param {string} value
        * @param {boolean} isLowerCase
        */
-      set(name, value, isLowerCase) {
+      set(name, value2, isLowerCase) {
         this[kHeadersSortedMap] = null;
         const lowercaseName = isLowerCase ? name : name.toLowerCase();
         if (lowercaseName === "set-cookie") {
-          this.cookies = [value];
+          this.cookies = [value2];
         }
-        this[kHeadersMap].set(lowercaseName, { name, value });
+        this[kHeadersMap].set(lowercaseName, { name, value: value2 });
       }
       /**
        * @see https://fetch.spec.whatwg.org/#concept-header-list-delete
@@ -12097,15 +12097,15 @@ var require_headers = __commonJS({
         return this[kHeadersMap].get(isLowerCase ? name : name.toLowerCase())?.value ?? null;
       }
       *[Symbol.iterator]() {
-        for (const { 0: name, 1: { value } } of this[kHeadersMap]) {
-          yield [name, value];
+        for (const { 0: name, 1: { value: value2 } } of this[kHeadersMap]) {
+          yield [name, value2];
         }
       }
       get entries() {
         const headers = {};
         if (this[kHeadersMap].size !== 0) {
-          for (const { name, value } of this[kHeadersMap].values()) {
-            headers[name] = value;
+          for (const { name, value: value2 } of this[kHeadersMap].values()) {
+            headers[name] = value2;
           }
         }
         return headers;
@@ -12116,13 +12116,13 @@ var require_headers = __commonJS({
       get entriesList() {
         const headers = [];
         if (this[kHeadersMap].size !== 0) {
-          for (const { 0: lowerName, 1: { name, value } } of this[kHeadersMap]) {
+          for (const { 0: lowerName, 1: { name, value: value2 } } of this[kHeadersMap]) {
             if (lowerName === "set-cookie") {
               for (const cookie of this.cookies) {
                 headers.push([name, cookie]);
               }
             } else {
-              headers.push([name, value]);
+              headers.push([name, value2]);
             }
           }
         }
@@ -12140,9 +12140,9 @@ var require_headers = __commonJS({
           const firstValue = iterator2.next().value;
           array[0] = [firstValue[0], firstValue[1].value];
           assert(firstValue[1].value !== null);
-          for (let i2 = 1, j = 0, right = 0, left = 0, pivot = 0, x2, value; i2 < size; ++i2) {
-            value = iterator2.next().value;
-            x2 = array[i2] = [value[0], value[1].value];
+          for (let i2 = 1, j = 0, right = 0, left = 0, pivot = 0, x2, value2; i2 < size; ++i2) {
+            value2 = iterator2.next().value;
+            x2 = array[i2] = [value2[0], value2[1].value];
             assert(x2[1] !== null);
             left = 0;
             right = i2;
@@ -12168,9 +12168,9 @@ var require_headers = __commonJS({
           return array;
         } else {
           let i2 = 0;
-          for (const { 0: name, 1: { value } } of this[kHeadersMap]) {
-            array[i2++] = [name, value];
-            assert(value !== null);
+          for (const { 0: name, 1: { value: value2 } } of this[kHeadersMap]) {
+            array[i2++] = [name, value2];
+            assert(value2 !== null);
           }
           return array.sort(compareHeaderName);
         }
@@ -12192,13 +12192,13 @@ var require_headers = __commonJS({
         }
       }
       // https://fetch.spec.whatwg.org/#dom-headers-append
-      append(name, value) {
+      append(name, value2) {
         webidl.brandCheck(this, _Headers);
         webidl.argumentLengthCheck(arguments, 2, "Headers.append");
         const prefix = "Headers.append";
         name = webidl.converters.ByteString(name, prefix, "name");
-        value = webidl.converters.ByteString(value, prefix, "value");
-        return appendHeader(this, name, value);
+        value2 = webidl.converters.ByteString(value2, prefix, "value");
+        return appendHeader(this, name, value2);
       }
       // https://fetch.spec.whatwg.org/#dom-headers-delete
       delete(name) {
@@ -12252,30 +12252,30 @@ var require_headers = __commonJS({
         return this.#headersList.contains(name, false);
       }
       // https://fetch.spec.whatwg.org/#dom-headers-set
-      set(name, value) {
+      set(name, value2) {
         webidl.brandCheck(this, _Headers);
         webidl.argumentLengthCheck(arguments, 2, "Headers.set");
         const prefix = "Headers.set";
         name = webidl.converters.ByteString(name, prefix, "name");
-        value = webidl.converters.ByteString(value, prefix, "value");
-        value = headerValueNormalize(value);
+        value2 = webidl.converters.ByteString(value2, prefix, "value");
+        value2 = headerValueNormalize(value2);
         if (!isValidHeaderName(name)) {
           throw webidl.errors.invalidArgument({
             prefix,
             value: name,
             type: "header name"
           });
-        } else if (!isValidHeaderValue(value)) {
+        } else if (!isValidHeaderValue(value2)) {
           throw webidl.errors.invalidArgument({
             prefix,
-            value,
+            value: value2,
             type: "header value"
           });
         }
         if (this.#guard === "immutable") {
           throw new TypeError("immutable");
         }
-        this.#headersList.set(name, value, false);
+        this.#headersList.set(name, value2, false);
       }
       // https://fetch.spec.whatwg.org/#dom-headers-getsetcookie
       getSetCookie() {
@@ -12292,19 +12292,19 @@ var require_headers = __commonJS({
           return this.#headersList[kHeadersSortedMap];
         }
         const headers = [];
-        const names = this.#headersList.toSortedArray();
+        const names2 = this.#headersList.toSortedArray();
         const cookies = this.#headersList.cookies;
         if (cookies === null || cookies.length === 1) {
-          return this.#headersList[kHeadersSortedMap] = names;
+          return this.#headersList[kHeadersSortedMap] = names2;
         }
-        for (let i2 = 0; i2 < names.length; ++i2) {
-          const { 0: name, 1: value } = names[i2];
+        for (let i2 = 0; i2 < names2.length; ++i2) {
+          const { 0: name, 1: value2 } = names2[i2];
           if (name === "set-cookie") {
             for (let j = 0; j < cookies.length; ++j) {
               headers.push([name, cookies[j]]);
             }
           } else {
-            headers.push([name, value]);
+            headers.push([name, value2]);
           }
         }
         return this.#headersList[kHeadersSortedMap] = headers;
@@ -12448,8 +12448,8 @@ var require_response = __commonJS({
         }
         const responseObject = fromInnerResponse(makeResponse({}), "immutable");
         responseObject[kState].status = status;
-        const value = isomorphicEncode(URLSerializer(parsedURL));
-        responseObject[kState].headersList.append("location", value, true);
+        const value2 = isomorphicEncode(URLSerializer(parsedURL));
+        responseObject[kState].headersList.append("location", value2, true);
         return responseObject;
       }
       // https://fetch.spec.whatwg.org/#dom-response
@@ -12631,9 +12631,9 @@ var require_response = __commonJS({
         get(target, p) {
           return p in state ? state[p] : target[p];
         },
-        set(target, p, value) {
+        set(target, p, value2) {
           assert(!(p in state));
-          target[p] = value;
+          target[p] = value2;
           return true;
         }
       });
@@ -12786,8 +12786,8 @@ var require_dispatcher_weakref = __commonJS({
     "use strict";
     var { kConnected, kSize } = require_symbols();
     var CompatWeakRef = class {
-      constructor(value) {
-        this.value = value;
+      constructor(value2) {
+        this.value = value2;
       }
       deref() {
         return this.value[kConnected] === 0 && this.value[kSize] === 0 ? void 0 : this.value;
@@ -13111,8 +13111,8 @@ var require_request2 = __commonJS({
           const headers = init.headers !== void 0 ? init.headers : new HeadersList(headersList);
           headersList.clear();
           if (headers instanceof HeadersList) {
-            for (const { name, value } of headers.rawValues()) {
-              headersList.append(name, value, false);
+            for (const { name, value: value2 } of headers.rawValues()) {
+              headersList.append(name, value2, false);
             }
             headersList.cookies = headers.cookies;
           } else {
@@ -13785,8 +13785,8 @@ var require_fetch = __commonJS({
         }
       }
       if (!request2.headersList.contains("accept", true)) {
-        const value = "*/*";
-        request2.headersList.append("accept", value, true);
+        const value2 = "*/*";
+        request2.headersList.append("accept", value2, true);
       }
       if (!request2.headersList.contains("accept-language", true)) {
         request2.headersList.append("accept-language", "*", true);
@@ -14385,11 +14385,11 @@ var require_fetch = __commonJS({
           let bytes;
           let isFailure;
           try {
-            const { done, value } = await fetchParams.controller.next();
+            const { done, value: value2 } = await fetchParams.controller.next();
             if (isAborted(fetchParams)) {
               break;
             }
-            bytes = done ? void 0 : value;
+            bytes = done ? void 0 : value2;
           } catch (err2) {
             if (fetchParams.controller.ended && !timingInfo.encodedBodySize) {
               bytes = void 0;
@@ -14988,15 +14988,15 @@ var require_util4 = __commonJS({
       (async () => {
         while (!fr[kAborted]) {
           try {
-            const { done, value } = await chunkPromise;
+            const { done, value: value2 } = await chunkPromise;
             if (isFirstChunk && !fr[kAborted]) {
               queueMicrotask(() => {
                 fireAProgressEvent("loadstart", fr);
               });
             }
             isFirstChunk = false;
-            if (!done && types.isUint8Array(value)) {
-              bytes.push(value);
+            if (!done && types.isUint8Array(value2)) {
+              bytes.push(value2);
               if ((fr[kLastProgressEventFired] === void 0 || Date.now() - fr[kLastProgressEventFired] >= 50) && !fr[kAborted]) {
                 fr[kLastProgressEventFired] = Date.now();
                 queueMicrotask(() => {
@@ -15420,10 +15420,10 @@ var require_util5 = __commonJS({
     function getFieldValues(header) {
       assert(header !== null);
       const values = [];
-      for (let value of header.split(",")) {
-        value = value.trim();
-        if (isValidHeaderName(value)) {
-          values.push(value);
+      for (let value2 of header.split(",")) {
+        value2 = value2.trim();
+        if (isValidHeaderName(value2)) {
+          values.push(value2);
         }
       }
       return values;
@@ -16107,9 +16107,9 @@ var require_constants4 = __commonJS({
 var require_util6 = __commonJS({
   "node_modules/undici/lib/web/cookies/util.js"(exports, module) {
     "use strict";
-    function isCTLExcludingHtab(value) {
-      for (let i2 = 0; i2 < value.length; ++i2) {
-        const code = value.charCodeAt(i2);
+    function isCTLExcludingHtab(value2) {
+      for (let i2 = 0; i2 < value2.length; ++i2) {
+        const code = value2.charCodeAt(i2);
         if (code >= 0 && code <= 8 || code >= 10 && code <= 31 || code === 127) {
           return true;
         }
@@ -16142,18 +16142,18 @@ var require_util6 = __commonJS({
         }
       }
     }
-    function validateCookieValue(value) {
-      let len = value.length;
+    function validateCookieValue(value2) {
+      let len = value2.length;
       let i2 = 0;
-      if (value[0] === '"') {
-        if (len === 1 || value[len - 1] !== '"') {
+      if (value2[0] === '"') {
+        if (len === 1 || value2[len - 1] !== '"') {
           throw new Error("Invalid cookie value");
         }
         --len;
         ++i2;
       }
       while (i2 < len) {
-        const code = value.charCodeAt(i2++);
+        const code = value2.charCodeAt(i2++);
         if (code < 33 || // exclude CTLs (0-31)
         code > 126 || // non-ascii and DEL (127)
         code === 34 || // "
@@ -16291,9 +16291,9 @@ var require_util6 = __commonJS({
         if (!part.includes("=")) {
           throw new Error("Invalid unparsed");
         }
-        const [key, ...value] = part.split("=");
+        const [key, ...value2] = part.split("=");
         const trimmedKey = key.trim();
-        const joinedValue = value.join("=");
+        const joinedValue = value2.join("=");
         validateCookieName(trimmedKey);
         validateCookieValue(joinedValue);
         out.push(`${trimmedKey}=${joinedValue}`);
@@ -16326,7 +16326,7 @@ var require_parse = __commonJS({
       let nameValuePair = "";
       let unparsedAttributes = "";
       let name = "";
-      let value = "";
+      let value2 = "";
       if (header.includes(";")) {
         const position = { position: 0 };
         nameValuePair = collectASequenceOfCodePointsFast(";", header, position);
@@ -16335,7 +16335,7 @@ var require_parse = __commonJS({
         nameValuePair = header;
       }
       if (!nameValuePair.includes("=")) {
-        value = nameValuePair;
+        value2 = nameValuePair;
       } else {
         const position = { position: 0 };
         name = collectASequenceOfCodePointsFast(
@@ -16343,16 +16343,16 @@ var require_parse = __commonJS({
           nameValuePair,
           position
         );
-        value = nameValuePair.slice(position.position + 1);
+        value2 = nameValuePair.slice(position.position + 1);
       }
       name = name.trim();
-      value = value.trim();
-      if (name.length + value.length > maxNameValuePairSize) {
+      value2 = value2.trim();
+      if (name.length + value2.length > maxNameValuePairSize) {
         return null;
       }
       return {
         name,
-        value,
+        value: value2,
         ...parseUnparsedAttributes(unparsedAttributes)
       };
     }
@@ -16464,8 +16464,8 @@ var require_cookies = __commonJS({
         return out;
       }
       for (const piece of cookie.split(";")) {
-        const [name, ...value] = piece.split("=");
-        out[name.trim()] = value.join("=");
+        const [name, ...value2] = piece.split("=");
+        out[name.trim()] = value2.join("=");
       }
       return out;
     }
@@ -16522,11 +16522,11 @@ var require_cookies = __commonJS({
         key: "value"
       },
       {
-        converter: webidl.nullableConverter((value) => {
-          if (typeof value === "number") {
-            return webidl.converters["unsigned long long"](value);
+        converter: webidl.nullableConverter((value2) => {
+          if (typeof value2 === "number") {
+            return webidl.converters["unsigned long long"](value2);
           }
-          return new Date(value);
+          return new Date(value2);
         }),
         key: "expires",
         defaultValue: () => null
@@ -17038,27 +17038,27 @@ var require_util7 = __commonJS({
       const extensionList = /* @__PURE__ */ new Map();
       while (position.position < extensions.length) {
         const pair = collectASequenceOfCodePointsFast(";", extensions, position);
-        const [name, value = ""] = pair.split("=");
+        const [name, value2 = ""] = pair.split("=");
         extensionList.set(
           removeHTTPWhitespace(name, true, false),
-          removeHTTPWhitespace(value, false, true)
+          removeHTTPWhitespace(value2, false, true)
         );
         position.position++;
       }
       return extensionList;
     }
-    function isValidClientWindowBits(value) {
-      if (value.length === 0) {
+    function isValidClientWindowBits(value2) {
+      if (value2.length === 0) {
         return false;
       }
-      for (let i2 = 0; i2 < value.length; i2++) {
-        const byte = value.charCodeAt(i2);
+      for (let i2 = 0; i2 < value2.length; i2++) {
+        const byte = value2.charCodeAt(i2);
         if (byte < 48 || byte > 57) {
           return false;
         }
       }
-      const num2 = Number.parseInt(value, 10);
-      return num2 >= 8 && num2 <= 15;
+      const num = Number.parseInt(value2, 10);
+      return num >= 8 && num <= 15;
     }
     var hasIntl = typeof process.versions.icu === "string";
     var fatalDecoder = hasIntl ? new TextDecoder("utf-8", { fatal: true }) : void 0;
@@ -18291,13 +18291,13 @@ var require_websocket = __commonJS({
 var require_util8 = __commonJS({
   "node_modules/undici/lib/web/eventsource/util.js"(exports, module) {
     "use strict";
-    function isValidLastEventId(value) {
-      return value.indexOf("\0") === -1;
+    function isValidLastEventId(value2) {
+      return value2.indexOf("\0") === -1;
     }
-    function isASCIINumber(value) {
-      if (value.length === 0) return false;
-      for (let i2 = 0; i2 < value.length; i2++) {
-        if (value.charCodeAt(i2) < 48 || value.charCodeAt(i2) > 57) return false;
+    function isASCIINumber(value2) {
+      if (value2.length === 0) return false;
+      for (let i2 = 0; i2 < value2.length; i2++) {
+        if (value2.charCodeAt(i2) < 48 || value2.charCodeAt(i2) > 57) return false;
       }
       return true;
     }
@@ -18528,12 +18528,12 @@ var require_eventsource_stream = __commonJS({
           const valueBytes = line.length - valueStart;
           const dataSize = this.eventFieldSizes.data + (event.data === void 0 ? 0 : 1) + valueBytes;
           this.setEventFieldSize("data", dataSize);
-          const value = line.toString("utf8", valueStart);
+          const value2 = line.toString("utf8", valueStart);
           if (event.data === void 0) {
-            event.data = value;
+            event.data = value2;
           } else {
             event.data += `
-${value}`;
+${value2}`;
           }
           this.dataLineCount++;
           return;
@@ -19209,10 +19209,10 @@ var require_code = __commonJS({
       }
       get names() {
         var _a2;
-        return (_a2 = this._names) !== null && _a2 !== void 0 ? _a2 : this._names = this._items.reduce((names, c) => {
+        return (_a2 = this._names) !== null && _a2 !== void 0 ? _a2 : this._names = this._items.reduce((names2, c) => {
           if (c instanceof Name)
-            names[c.str] = (names[c.str] || 0) + 1;
-          return names;
+            names2[c.str] = (names2[c.str] || 0) + 1;
+          return names2;
         }, {});
       }
     };
@@ -19368,8 +19368,8 @@ var require_scope = __commonJS({
         super(nameStr);
         this.prefix = prefix;
       }
-      setValue(value, { property, itemIndex }) {
-        this.value = value;
+      setValue(value2, { property, itemIndex }) {
+        this.value = value2;
         this.scopePath = (0, code_1._)`.${new code_1.Name(property)}[${itemIndex}]`;
       }
     };
@@ -19388,13 +19388,13 @@ var require_scope = __commonJS({
       name(prefix) {
         return new ValueScopeName(prefix, this._newName(prefix));
       }
-      value(nameOrPrefix, value) {
+      value(nameOrPrefix, value2) {
         var _a2;
-        if (value.ref === void 0)
+        if (value2.ref === void 0)
           throw new Error("CodeGen: ref must be passed in value");
         const name = this.toName(nameOrPrefix);
         const { prefix } = name;
-        const valueKey = (_a2 = value.key) !== null && _a2 !== void 0 ? _a2 : value.ref;
+        const valueKey = (_a2 = value2.key) !== null && _a2 !== void 0 ? _a2 : value2.ref;
         let vs = this._values[prefix];
         if (vs) {
           const _name = vs.get(valueKey);
@@ -19406,8 +19406,8 @@ var require_scope = __commonJS({
         vs.set(valueKey, name);
         const s = this._scope[prefix] || (this._scope[prefix] = []);
         const itemIndex = s.length;
-        s[itemIndex] = value.ref;
-        name.setValue(value, { property: prefix, itemIndex });
+        s[itemIndex] = value2.ref;
+        name.setValue(value2, { property: prefix, itemIndex });
         return name;
       }
       getValue(prefix, keyOrRef) {
@@ -19538,11 +19538,11 @@ var require_codegen = __commonJS({
         const rhs = this.rhs === void 0 ? "" : ` = ${this.rhs}`;
         return `${varKind} ${this.name}${rhs};` + _n;
       }
-      optimizeNames(names, constants3) {
-        if (!names[this.name.str])
+      optimizeNames(names2, constants3) {
+        if (!names2[this.name.str])
           return;
         if (this.rhs)
-          this.rhs = optimizeExpr(this.rhs, names, constants3);
+          this.rhs = optimizeExpr(this.rhs, names2, constants3);
         return this;
       }
       get names() {
@@ -19559,15 +19559,15 @@ var require_codegen = __commonJS({
       render({ _n }) {
         return `${this.lhs} = ${this.rhs};` + _n;
       }
-      optimizeNames(names, constants3) {
-        if (this.lhs instanceof code_1.Name && !names[this.lhs.str] && !this.sideEffects)
+      optimizeNames(names2, constants3) {
+        if (this.lhs instanceof code_1.Name && !names2[this.lhs.str] && !this.sideEffects)
           return;
-        this.rhs = optimizeExpr(this.rhs, names, constants3);
+        this.rhs = optimizeExpr(this.rhs, names2, constants3);
         return this;
       }
       get names() {
-        const names = this.lhs instanceof code_1.Name ? {} : { ...this.lhs.names };
-        return addExprNames(names, this.rhs);
+        const names2 = this.lhs instanceof code_1.Name ? {} : { ...this.lhs.names };
+        return addExprNames(names2, this.rhs);
       }
     };
     var AssignOp = class extends Assign {
@@ -19623,8 +19623,8 @@ var require_codegen = __commonJS({
       optimizeNodes() {
         return `${this.code}` ? this : void 0;
       }
-      optimizeNames(names, constants3) {
-        this.code = optimizeExpr(this.code, names, constants3);
+      optimizeNames(names2, constants3) {
+        this.code = optimizeExpr(this.code, names2, constants3);
         return this;
       }
       get names() {
@@ -19653,20 +19653,20 @@ var require_codegen = __commonJS({
         }
         return nodes.length > 0 ? this : void 0;
       }
-      optimizeNames(names, constants3) {
+      optimizeNames(names2, constants3) {
         const { nodes } = this;
         let i2 = nodes.length;
         while (i2--) {
           const n = nodes[i2];
-          if (n.optimizeNames(names, constants3))
+          if (n.optimizeNames(names2, constants3))
             continue;
-          subtractNames(names, n.names);
+          subtractNames(names2, n.names);
           nodes.splice(i2, 1);
         }
         return nodes.length > 0 ? this : void 0;
       }
       get names() {
-        return this.nodes.reduce((names, n) => addNames(names, n.names), {});
+        return this.nodes.reduce((names2, n) => addNames(names2, n.names), {});
       }
     };
     var BlockNode = class extends ParentNode {
@@ -19711,20 +19711,20 @@ var require_codegen = __commonJS({
           return void 0;
         return this;
       }
-      optimizeNames(names, constants3) {
+      optimizeNames(names2, constants3) {
         var _a2;
-        this.else = (_a2 = this.else) === null || _a2 === void 0 ? void 0 : _a2.optimizeNames(names, constants3);
-        if (!(super.optimizeNames(names, constants3) || this.else))
+        this.else = (_a2 = this.else) === null || _a2 === void 0 ? void 0 : _a2.optimizeNames(names2, constants3);
+        if (!(super.optimizeNames(names2, constants3) || this.else))
           return;
-        this.condition = optimizeExpr(this.condition, names, constants3);
+        this.condition = optimizeExpr(this.condition, names2, constants3);
         return this;
       }
       get names() {
-        const names = super.names;
-        addExprNames(names, this.condition);
+        const names2 = super.names;
+        addExprNames(names2, this.condition);
         if (this.else)
-          addNames(names, this.else.names);
-        return names;
+          addNames(names2, this.else.names);
+        return names2;
       }
     };
     If.kind = "if";
@@ -19739,10 +19739,10 @@ var require_codegen = __commonJS({
       render(opts) {
         return `for(${this.iteration})` + super.render(opts);
       }
-      optimizeNames(names, constants3) {
-        if (!super.optimizeNames(names, constants3))
+      optimizeNames(names2, constants3) {
+        if (!super.optimizeNames(names2, constants3))
           return;
-        this.iteration = optimizeExpr(this.iteration, names, constants3);
+        this.iteration = optimizeExpr(this.iteration, names2, constants3);
         return this;
       }
       get names() {
@@ -19763,8 +19763,8 @@ var require_codegen = __commonJS({
         return `for(${varKind} ${name}=${from}; ${name}<${to}; ${name}++)` + super.render(opts);
       }
       get names() {
-        const names = addExprNames(super.names, this.from);
-        return addExprNames(names, this.to);
+        const names2 = addExprNames(super.names, this.from);
+        return addExprNames(names2, this.to);
       }
     };
     var ForIter = class extends For {
@@ -19778,10 +19778,10 @@ var require_codegen = __commonJS({
       render(opts) {
         return `for(${this.varKind} ${this.name} ${this.loop} ${this.iterable})` + super.render(opts);
       }
-      optimizeNames(names, constants3) {
-        if (!super.optimizeNames(names, constants3))
+      optimizeNames(names2, constants3) {
+        if (!super.optimizeNames(names2, constants3))
           return;
-        this.iterable = optimizeExpr(this.iterable, names, constants3);
+        this.iterable = optimizeExpr(this.iterable, names2, constants3);
         return this;
       }
       get names() {
@@ -19823,20 +19823,20 @@ var require_codegen = __commonJS({
         (_b2 = this.finally) === null || _b2 === void 0 ? void 0 : _b2.optimizeNodes();
         return this;
       }
-      optimizeNames(names, constants3) {
+      optimizeNames(names2, constants3) {
         var _a2, _b2;
-        super.optimizeNames(names, constants3);
-        (_a2 = this.catch) === null || _a2 === void 0 ? void 0 : _a2.optimizeNames(names, constants3);
-        (_b2 = this.finally) === null || _b2 === void 0 ? void 0 : _b2.optimizeNames(names, constants3);
+        super.optimizeNames(names2, constants3);
+        (_a2 = this.catch) === null || _a2 === void 0 ? void 0 : _a2.optimizeNames(names2, constants3);
+        (_b2 = this.finally) === null || _b2 === void 0 ? void 0 : _b2.optimizeNames(names2, constants3);
         return this;
       }
       get names() {
-        const names = super.names;
+        const names2 = super.names;
         if (this.catch)
-          addNames(names, this.catch.names);
+          addNames(names2, this.catch.names);
         if (this.finally)
-          addNames(names, this.finally.names);
-        return names;
+          addNames(names2, this.finally.names);
+        return names2;
       }
     };
     var Catch = class extends BlockNode {
@@ -19877,8 +19877,8 @@ var require_codegen = __commonJS({
         return this._extScope.name(prefix);
       }
       // reserves unique name in the external scope and assigns value to it
-      scopeValue(prefixOrName, value) {
-        const name = this._extScope.value(prefixOrName, value);
+      scopeValue(prefixOrName, value2) {
+        const name = this._extScope.value(prefixOrName, value2);
         const vs = this._values[name.prefix] || (this._values[name.prefix] = /* @__PURE__ */ new Set());
         vs.add(name);
         return name;
@@ -19932,13 +19932,13 @@ var require_codegen = __commonJS({
       // returns code for object literal for the passed argument list of key-value pairs
       object(...keyValues) {
         const code = ["{"];
-        for (const [key, value] of keyValues) {
+        for (const [key, value2] of keyValues) {
           if (code.length > 1)
             code.push(",");
           code.push(key);
-          if (key !== value || this.opts.es5) {
+          if (key !== value2 || this.opts.es5) {
             code.push(":");
-            (0, code_1.addCodeArg)(code, value);
+            (0, code_1.addCodeArg)(code, value2);
           }
         }
         code.push("}");
@@ -20017,10 +20017,10 @@ var require_codegen = __commonJS({
         return this._leafNode(new Break(label));
       }
       // `return` statement
-      return(value) {
+      return(value2) {
         const node = new Return();
         this._blockNode(node);
-        this.code(value);
+        this.code(value2);
         if (node.nodes.length !== 1)
           throw new Error('CodeGen: "return" should have one node');
         return this._endBlockNode(Return);
@@ -20120,15 +20120,15 @@ var require_codegen = __commonJS({
       }
     };
     exports.CodeGen = CodeGen;
-    function addNames(names, from) {
+    function addNames(names2, from) {
       for (const n in from)
-        names[n] = (names[n] || 0) + (from[n] || 0);
-      return names;
+        names2[n] = (names2[n] || 0) + (from[n] || 0);
+      return names2;
     }
-    function addExprNames(names, from) {
-      return from instanceof code_1._CodeOrName ? addNames(names, from.names) : names;
+    function addExprNames(names2, from) {
+      return from instanceof code_1._CodeOrName ? addNames(names2, from.names) : names2;
     }
-    function optimizeExpr(expr, names, constants3) {
+    function optimizeExpr(expr, names2, constants3) {
       if (expr instanceof code_1.Name)
         return replaceName(expr);
       if (!canOptimize(expr))
@@ -20144,18 +20144,18 @@ var require_codegen = __commonJS({
       }, []));
       function replaceName(n) {
         const c = constants3[n.str];
-        if (c === void 0 || names[n.str] !== 1)
+        if (c === void 0 || names2[n.str] !== 1)
           return n;
-        delete names[n.str];
+        delete names2[n.str];
         return c;
       }
       function canOptimize(e) {
-        return e instanceof code_1._Code && e._items.some((c) => c instanceof code_1.Name && names[c.str] === 1 && constants3[c.str] !== void 0);
+        return e instanceof code_1._Code && e._items.some((c) => c instanceof code_1.Name && names2[c.str] === 1 && constants3[c.str] !== void 0);
       }
     }
-    function subtractNames(names, from) {
+    function subtractNames(names2, from) {
       for (const n in from)
-        names[n] = (names[n] || 0) - (from[n] || 0);
+        names2[n] = (names2[n] || 0) - (from[n] || 0);
     }
     function not(x2) {
       return typeof x2 == "boolean" || typeof x2 == "number" || x2 === null ? !x2 : (0, code_1._)`!${par(x2)}`;
@@ -20353,7 +20353,7 @@ var require_names = __commonJS({
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var codegen_1 = require_codegen();
-    var names = {
+    var names2 = {
       // validation function arguments
       data: new codegen_1.Name("data"),
       // data passed to validation function
@@ -20382,7 +20382,7 @@ var require_names = __commonJS({
       jsonLen: new codegen_1.Name("jsonLen"),
       jsonPart: new codegen_1.Name("jsonPart")
     };
-    exports.default = names;
+    exports.default = names2;
   }
 });
 
@@ -23382,13 +23382,13 @@ var require_fast_uri = __commonJS({
       if (typeof uri !== "string" && typeof uri !== "object") {
         return void 0;
       }
-      let value;
+      let value2;
       try {
-        value = typeof uri === "string" ? uri : serialize2(uri, opts);
+        value2 = typeof uri === "string" ? uri : serialize2(uri, opts);
       } catch {
         return void 0;
       }
-      const { normalized, malformedAuthorityOrPort, malformedPercentEncoding, malformedSchemeSpecific, malformedHost, malformedScheme } = normalizeStringWithStatus(value, opts);
+      const { normalized, malformedAuthorityOrPort, malformedPercentEncoding, malformedSchemeSpecific, malformedHost, malformedScheme } = normalizeStringWithStatus(value2, opts);
       return malformedAuthorityOrPort || malformedPercentEncoding || malformedSchemeSpecific || malformedHost || malformedScheme ? void 0 : normalized;
     }
     var fastUri = {
@@ -24255,13 +24255,13 @@ var require_ucs2length = __commonJS({
       const len = str.length;
       let length = 0;
       let pos = 0;
-      let value;
+      let value2;
       while (pos < len) {
         length++;
-        value = str.charCodeAt(pos++);
-        if (value >= 55296 && value <= 56319 && pos < len) {
-          value = str.charCodeAt(pos);
-          if ((value & 64512) === 56320)
+        value2 = str.charCodeAt(pos++);
+        if (value2 >= 55296 && value2 <= 56319 && pos < len) {
+          value2 = str.charCodeAt(pos);
+          if ((value2 & 64512) === 56320)
             pos++;
         }
       }
@@ -26066,3857 +26066,6 @@ var require_ajv = __commonJS({
   }
 });
 
-// node_modules/jstat/dist/jstat.js
-var require_jstat = __commonJS({
-  "node_modules/jstat/dist/jstat.js"(exports, module) {
-    (function(window2, factory) {
-      if (typeof exports === "object") {
-        module.exports = factory();
-      } else if (typeof define === "function" && define.amd) {
-        define(factory);
-      } else {
-        window2.jStat = factory();
-      }
-    })(exports, function() {
-      var jStat3 = (function(Math2, undefined2) {
-        var concat = Array.prototype.concat;
-        var slice = Array.prototype.slice;
-        var toString = Object.prototype.toString;
-        function calcRdx(n, m) {
-          var val = n > m ? n : m;
-          return Math2.pow(
-            10,
-            17 - ~~(Math2.log(val > 0 ? val : -val) * Math2.LOG10E)
-          );
-        }
-        var isArray = Array.isArray || function isArray2(arg) {
-          return toString.call(arg) === "[object Array]";
-        };
-        function isFunction(arg) {
-          return toString.call(arg) === "[object Function]";
-        }
-        function isNumber(num2) {
-          return typeof num2 === "number" ? num2 - num2 === 0 : false;
-        }
-        function toVector(arr) {
-          return concat.apply([], arr);
-        }
-        function jStat4() {
-          return new jStat4._init(arguments);
-        }
-        jStat4.fn = jStat4.prototype;
-        jStat4._init = function _init(args) {
-          if (isArray(args[0])) {
-            if (isArray(args[0][0])) {
-              if (isFunction(args[1]))
-                args[0] = jStat4.map(args[0], args[1]);
-              for (var i2 = 0; i2 < args[0].length; i2++)
-                this[i2] = args[0][i2];
-              this.length = args[0].length;
-            } else {
-              this[0] = isFunction(args[1]) ? jStat4.map(args[0], args[1]) : args[0];
-              this.length = 1;
-            }
-          } else if (isNumber(args[0])) {
-            this[0] = jStat4.seq.apply(null, args);
-            this.length = 1;
-          } else if (args[0] instanceof jStat4) {
-            return jStat4(args[0].toArray());
-          } else {
-            this[0] = [];
-            this.length = 1;
-          }
-          return this;
-        };
-        jStat4._init.prototype = jStat4.prototype;
-        jStat4._init.constructor = jStat4;
-        jStat4.utils = {
-          calcRdx,
-          isArray,
-          isFunction,
-          isNumber,
-          toVector
-        };
-        jStat4._random_fn = Math2.random;
-        jStat4.setRandom = function setRandom(fn) {
-          if (typeof fn !== "function")
-            throw new TypeError("fn is not a function");
-          jStat4._random_fn = fn;
-        };
-        jStat4.extend = function extend(obj) {
-          var i2, j;
-          if (arguments.length === 1) {
-            for (j in obj)
-              jStat4[j] = obj[j];
-            return this;
-          }
-          for (i2 = 1; i2 < arguments.length; i2++) {
-            for (j in arguments[i2])
-              obj[j] = arguments[i2][j];
-          }
-          return obj;
-        };
-        jStat4.rows = function rows(arr) {
-          return arr.length || 1;
-        };
-        jStat4.cols = function cols(arr) {
-          return arr[0].length || 1;
-        };
-        jStat4.dimensions = function dimensions(arr) {
-          return {
-            rows: jStat4.rows(arr),
-            cols: jStat4.cols(arr)
-          };
-        };
-        jStat4.row = function row(arr, index) {
-          if (isArray(index)) {
-            return index.map(function(i2) {
-              return jStat4.row(arr, i2);
-            });
-          }
-          return arr[index];
-        };
-        jStat4.rowa = function rowa(arr, i2) {
-          return jStat4.row(arr, i2);
-        };
-        jStat4.col = function col(arr, index) {
-          if (isArray(index)) {
-            var submat = jStat4.arange(arr.length).map(function() {
-              return new Array(index.length);
-            });
-            index.forEach(function(ind, i3) {
-              jStat4.arange(arr.length).forEach(function(j) {
-                submat[j][i3] = arr[j][ind];
-              });
-            });
-            return submat;
-          }
-          var column = new Array(arr.length);
-          for (var i2 = 0; i2 < arr.length; i2++)
-            column[i2] = [arr[i2][index]];
-          return column;
-        };
-        jStat4.cola = function cola(arr, i2) {
-          return jStat4.col(arr, i2).map(function(a) {
-            return a[0];
-          });
-        };
-        jStat4.diag = function diag(arr) {
-          var nrow = jStat4.rows(arr);
-          var res = new Array(nrow);
-          for (var row = 0; row < nrow; row++)
-            res[row] = [arr[row][row]];
-          return res;
-        };
-        jStat4.antidiag = function antidiag(arr) {
-          var nrow = jStat4.rows(arr) - 1;
-          var res = new Array(nrow);
-          for (var i2 = 0; nrow >= 0; nrow--, i2++)
-            res[i2] = [arr[i2][nrow]];
-          return res;
-        };
-        jStat4.transpose = function transpose(arr) {
-          var obj = [];
-          var objArr, rows, cols, j, i2;
-          if (!isArray(arr[0]))
-            arr = [arr];
-          rows = arr.length;
-          cols = arr[0].length;
-          for (i2 = 0; i2 < cols; i2++) {
-            objArr = new Array(rows);
-            for (j = 0; j < rows; j++)
-              objArr[j] = arr[j][i2];
-            obj.push(objArr);
-          }
-          return obj.length === 1 ? obj[0] : obj;
-        };
-        jStat4.map = function map(arr, func, toAlter) {
-          var row, nrow, ncol, res, col;
-          if (!isArray(arr[0]))
-            arr = [arr];
-          nrow = arr.length;
-          ncol = arr[0].length;
-          res = toAlter ? arr : new Array(nrow);
-          for (row = 0; row < nrow; row++) {
-            if (!res[row])
-              res[row] = new Array(ncol);
-            for (col = 0; col < ncol; col++)
-              res[row][col] = func(arr[row][col], row, col);
-          }
-          return res.length === 1 ? res[0] : res;
-        };
-        jStat4.cumreduce = function cumreduce(arr, func, toAlter) {
-          var row, nrow, ncol, res, col;
-          if (!isArray(arr[0]))
-            arr = [arr];
-          nrow = arr.length;
-          ncol = arr[0].length;
-          res = toAlter ? arr : new Array(nrow);
-          for (row = 0; row < nrow; row++) {
-            if (!res[row])
-              res[row] = new Array(ncol);
-            if (ncol > 0)
-              res[row][0] = arr[row][0];
-            for (col = 1; col < ncol; col++)
-              res[row][col] = func(res[row][col - 1], arr[row][col]);
-          }
-          return res.length === 1 ? res[0] : res;
-        };
-        jStat4.alter = function alter(arr, func) {
-          return jStat4.map(arr, func, true);
-        };
-        jStat4.create = function create(rows, cols, func) {
-          var res = new Array(rows);
-          var i2, j;
-          if (isFunction(cols)) {
-            func = cols;
-            cols = rows;
-          }
-          for (i2 = 0; i2 < rows; i2++) {
-            res[i2] = new Array(cols);
-            for (j = 0; j < cols; j++)
-              res[i2][j] = func(i2, j);
-          }
-          return res;
-        };
-        function retZero() {
-          return 0;
-        }
-        jStat4.zeros = function zeros(rows, cols) {
-          if (!isNumber(cols))
-            cols = rows;
-          return jStat4.create(rows, cols, retZero);
-        };
-        function retOne() {
-          return 1;
-        }
-        jStat4.ones = function ones(rows, cols) {
-          if (!isNumber(cols))
-            cols = rows;
-          return jStat4.create(rows, cols, retOne);
-        };
-        jStat4.rand = function rand(rows, cols) {
-          if (!isNumber(cols))
-            cols = rows;
-          return jStat4.create(rows, cols, jStat4._random_fn);
-        };
-        function retIdent(i2, j) {
-          return i2 === j ? 1 : 0;
-        }
-        jStat4.identity = function identity(rows, cols) {
-          if (!isNumber(cols))
-            cols = rows;
-          return jStat4.create(rows, cols, retIdent);
-        };
-        jStat4.symmetric = function symmetric(arr) {
-          var size = arr.length;
-          var row, col;
-          if (arr.length !== arr[0].length)
-            return false;
-          for (row = 0; row < size; row++) {
-            for (col = 0; col < size; col++)
-              if (arr[col][row] !== arr[row][col])
-                return false;
-          }
-          return true;
-        };
-        jStat4.clear = function clear(arr) {
-          return jStat4.alter(arr, retZero);
-        };
-        jStat4.seq = function seq(min, max2, length, func) {
-          if (!isFunction(func))
-            func = false;
-          var arr = [];
-          var hival = calcRdx(min, max2);
-          var step = (max2 * hival - min * hival) / ((length - 1) * hival);
-          var current = min;
-          var cnt;
-          for (cnt = 0; current <= max2 && cnt < length; cnt++, current = (min * hival + step * hival * cnt) / hival) {
-            arr.push(func ? func(current, cnt) : current);
-          }
-          return arr;
-        };
-        jStat4.arange = function arange(start, end, step) {
-          var rl = [];
-          var i2;
-          step = step || 1;
-          if (end === undefined2) {
-            end = start;
-            start = 0;
-          }
-          if (start === end || step === 0) {
-            return [];
-          }
-          if (start < end && step < 0) {
-            return [];
-          }
-          if (start > end && step > 0) {
-            return [];
-          }
-          if (step > 0) {
-            for (i2 = start; i2 < end; i2 += step) {
-              rl.push(i2);
-            }
-          } else {
-            for (i2 = start; i2 > end; i2 += step) {
-              rl.push(i2);
-            }
-          }
-          return rl;
-        };
-        jStat4.slice = /* @__PURE__ */ (function() {
-          function _slice(list, start, end, step) {
-            var i2;
-            var rl = [];
-            var length = list.length;
-            if (start === undefined2 && end === undefined2 && step === undefined2) {
-              return jStat4.copy(list);
-            }
-            start = start || 0;
-            end = end || list.length;
-            start = start >= 0 ? start : length + start;
-            end = end >= 0 ? end : length + end;
-            step = step || 1;
-            if (start === end || step === 0) {
-              return [];
-            }
-            if (start < end && step < 0) {
-              return [];
-            }
-            if (start > end && step > 0) {
-              return [];
-            }
-            if (step > 0) {
-              for (i2 = start; i2 < end; i2 += step) {
-                rl.push(list[i2]);
-              }
-            } else {
-              for (i2 = start; i2 > end; i2 += step) {
-                rl.push(list[i2]);
-              }
-            }
-            return rl;
-          }
-          function slice2(list, rcSlice) {
-            var colSlice, rowSlice;
-            rcSlice = rcSlice || {};
-            if (isNumber(rcSlice.row)) {
-              if (isNumber(rcSlice.col))
-                return list[rcSlice.row][rcSlice.col];
-              var row = jStat4.rowa(list, rcSlice.row);
-              colSlice = rcSlice.col || {};
-              return _slice(row, colSlice.start, colSlice.end, colSlice.step);
-            }
-            if (isNumber(rcSlice.col)) {
-              var col = jStat4.cola(list, rcSlice.col);
-              rowSlice = rcSlice.row || {};
-              return _slice(col, rowSlice.start, rowSlice.end, rowSlice.step);
-            }
-            rowSlice = rcSlice.row || {};
-            colSlice = rcSlice.col || {};
-            var rows = _slice(list, rowSlice.start, rowSlice.end, rowSlice.step);
-            return rows.map(function(row2) {
-              return _slice(row2, colSlice.start, colSlice.end, colSlice.step);
-            });
-          }
-          return slice2;
-        })();
-        jStat4.sliceAssign = function sliceAssign(A, rcSlice, B) {
-          var nl, ml;
-          if (isNumber(rcSlice.row)) {
-            if (isNumber(rcSlice.col))
-              return A[rcSlice.row][rcSlice.col] = B;
-            rcSlice.col = rcSlice.col || {};
-            rcSlice.col.start = rcSlice.col.start || 0;
-            rcSlice.col.end = rcSlice.col.end || A[0].length;
-            rcSlice.col.step = rcSlice.col.step || 1;
-            nl = jStat4.arange(
-              rcSlice.col.start,
-              Math2.min(A.length, rcSlice.col.end),
-              rcSlice.col.step
-            );
-            var m = rcSlice.row;
-            nl.forEach(function(n2, i2) {
-              A[m][n2] = B[i2];
-            });
-            return A;
-          }
-          if (isNumber(rcSlice.col)) {
-            rcSlice.row = rcSlice.row || {};
-            rcSlice.row.start = rcSlice.row.start || 0;
-            rcSlice.row.end = rcSlice.row.end || A.length;
-            rcSlice.row.step = rcSlice.row.step || 1;
-            ml = jStat4.arange(
-              rcSlice.row.start,
-              Math2.min(A[0].length, rcSlice.row.end),
-              rcSlice.row.step
-            );
-            var n = rcSlice.col;
-            ml.forEach(function(m2, j) {
-              A[m2][n] = B[j];
-            });
-            return A;
-          }
-          if (B[0].length === undefined2) {
-            B = [B];
-          }
-          rcSlice.row.start = rcSlice.row.start || 0;
-          rcSlice.row.end = rcSlice.row.end || A.length;
-          rcSlice.row.step = rcSlice.row.step || 1;
-          rcSlice.col.start = rcSlice.col.start || 0;
-          rcSlice.col.end = rcSlice.col.end || A[0].length;
-          rcSlice.col.step = rcSlice.col.step || 1;
-          ml = jStat4.arange(
-            rcSlice.row.start,
-            Math2.min(A.length, rcSlice.row.end),
-            rcSlice.row.step
-          );
-          nl = jStat4.arange(
-            rcSlice.col.start,
-            Math2.min(A[0].length, rcSlice.col.end),
-            rcSlice.col.step
-          );
-          ml.forEach(function(m2, i2) {
-            nl.forEach(function(n2, j) {
-              A[m2][n2] = B[i2][j];
-            });
-          });
-          return A;
-        };
-        jStat4.diagonal = function diagonal(diagArray) {
-          var mat = jStat4.zeros(diagArray.length, diagArray.length);
-          diagArray.forEach(function(t, i2) {
-            mat[i2][i2] = t;
-          });
-          return mat;
-        };
-        jStat4.copy = function copy(A) {
-          return A.map(function(row) {
-            if (isNumber(row))
-              return row;
-            return row.map(function(t) {
-              return t;
-            });
-          });
-        };
-        var jProto = jStat4.prototype;
-        jProto.length = 0;
-        jProto.push = Array.prototype.push;
-        jProto.sort = Array.prototype.sort;
-        jProto.splice = Array.prototype.splice;
-        jProto.slice = Array.prototype.slice;
-        jProto.toArray = function toArray() {
-          return this.length > 1 ? slice.call(this) : slice.call(this)[0];
-        };
-        jProto.map = function map(func, toAlter) {
-          return jStat4(jStat4.map(this, func, toAlter));
-        };
-        jProto.cumreduce = function cumreduce(func, toAlter) {
-          return jStat4(jStat4.cumreduce(this, func, toAlter));
-        };
-        jProto.alter = function alter(func) {
-          jStat4.alter(this, func);
-          return this;
-        };
-        (function(funcs) {
-          for (var i2 = 0; i2 < funcs.length; i2++) (function(passfunc) {
-            jProto[passfunc] = function(func) {
-              var self2 = this, results;
-              if (func) {
-                setTimeout(function() {
-                  func.call(self2, jProto[passfunc].call(self2));
-                });
-                return this;
-              }
-              results = jStat4[passfunc](this);
-              return isArray(results) ? jStat4(results) : results;
-            };
-          })(funcs[i2]);
-        })("transpose clear symmetric rows cols dimensions diag antidiag".split(" "));
-        (function(funcs) {
-          for (var i2 = 0; i2 < funcs.length; i2++) (function(passfunc) {
-            jProto[passfunc] = function(index, func) {
-              var self2 = this;
-              if (func) {
-                setTimeout(function() {
-                  func.call(self2, jProto[passfunc].call(self2, index));
-                });
-                return this;
-              }
-              return jStat4(jStat4[passfunc](this, index));
-            };
-          })(funcs[i2]);
-        })("row col".split(" "));
-        (function(funcs) {
-          for (var i2 = 0; i2 < funcs.length; i2++) (function(passfunc) {
-            jProto[passfunc] = function() {
-              return jStat4(jStat4[passfunc].apply(null, arguments));
-            };
-          })(funcs[i2]);
-        })("create zeros ones rand identity".split(" "));
-        return jStat4;
-      })(Math);
-      (function(jStat4, Math2) {
-        var isFunction = jStat4.utils.isFunction;
-        function ascNum(a, b) {
-          return a - b;
-        }
-        function clip2(arg, min, max2) {
-          return Math2.max(min, Math2.min(arg, max2));
-        }
-        jStat4.sum = function sum(arr) {
-          var sum2 = 0;
-          var i2 = arr.length;
-          while (--i2 >= 0)
-            sum2 += arr[i2];
-          return sum2;
-        };
-        jStat4.sumsqrd = function sumsqrd(arr) {
-          var sum = 0;
-          var i2 = arr.length;
-          while (--i2 >= 0)
-            sum += arr[i2] * arr[i2];
-          return sum;
-        };
-        jStat4.sumsqerr = function sumsqerr(arr) {
-          var mean2 = jStat4.mean(arr);
-          var sum = 0;
-          var i2 = arr.length;
-          var tmp;
-          while (--i2 >= 0) {
-            tmp = arr[i2] - mean2;
-            sum += tmp * tmp;
-          }
-          return sum;
-        };
-        jStat4.sumrow = function sumrow(arr) {
-          var sum = 0;
-          var i2 = arr.length;
-          while (--i2 >= 0)
-            sum += arr[i2];
-          return sum;
-        };
-        jStat4.product = function product(arr) {
-          var prod = 1;
-          var i2 = arr.length;
-          while (--i2 >= 0)
-            prod *= arr[i2];
-          return prod;
-        };
-        jStat4.min = function min(arr) {
-          var low = arr[0];
-          var i2 = 0;
-          while (++i2 < arr.length)
-            if (arr[i2] < low)
-              low = arr[i2];
-          return low;
-        };
-        jStat4.max = function max2(arr) {
-          var high = arr[0];
-          var i2 = 0;
-          while (++i2 < arr.length)
-            if (arr[i2] > high)
-              high = arr[i2];
-          return high;
-        };
-        jStat4.unique = function unique(arr) {
-          var hash = {}, _arr = [];
-          for (var i2 = 0; i2 < arr.length; i2++) {
-            if (!hash[arr[i2]]) {
-              hash[arr[i2]] = true;
-              _arr.push(arr[i2]);
-            }
-          }
-          return _arr;
-        };
-        jStat4.mean = function mean2(arr) {
-          return jStat4.sum(arr) / arr.length;
-        };
-        jStat4.meansqerr = function meansqerr(arr) {
-          return jStat4.sumsqerr(arr) / arr.length;
-        };
-        jStat4.geomean = function geomean(arr) {
-          var logs = arr.map(Math2.log);
-          var meanOfLogs = jStat4.mean(logs);
-          return Math2.exp(meanOfLogs);
-        };
-        jStat4.median = function median(arr) {
-          var arrlen = arr.length;
-          var _arr = arr.slice().sort(ascNum);
-          return !(arrlen & 1) ? (_arr[arrlen / 2 - 1] + _arr[arrlen / 2]) / 2 : _arr[arrlen / 2 | 0];
-        };
-        jStat4.cumsum = function cumsum(arr) {
-          return jStat4.cumreduce(arr, function(a, b) {
-            return a + b;
-          });
-        };
-        jStat4.cumprod = function cumprod(arr) {
-          return jStat4.cumreduce(arr, function(a, b) {
-            return a * b;
-          });
-        };
-        jStat4.diff = function diff(arr) {
-          var diffs = [];
-          var arrLen = arr.length;
-          var i2;
-          for (i2 = 1; i2 < arrLen; i2++)
-            diffs.push(arr[i2] - arr[i2 - 1]);
-          return diffs;
-        };
-        jStat4.rank = function(arr) {
-          var i2;
-          var distinctNumbers = [];
-          var numberCounts = {};
-          for (i2 = 0; i2 < arr.length; i2++) {
-            var number2 = arr[i2];
-            if (numberCounts[number2]) {
-              numberCounts[number2]++;
-            } else {
-              numberCounts[number2] = 1;
-              distinctNumbers.push(number2);
-            }
-          }
-          var sortedDistinctNumbers = distinctNumbers.sort(ascNum);
-          var numberRanks = {};
-          var currentRank = 1;
-          for (i2 = 0; i2 < sortedDistinctNumbers.length; i2++) {
-            var number2 = sortedDistinctNumbers[i2];
-            var count2 = numberCounts[number2];
-            var first = currentRank;
-            var last = currentRank + count2 - 1;
-            var rank = (first + last) / 2;
-            numberRanks[number2] = rank;
-            currentRank += count2;
-          }
-          return arr.map(function(number3) {
-            return numberRanks[number3];
-          });
-        };
-        jStat4.mode = function mode(arr) {
-          var arrLen = arr.length;
-          var _arr = arr.slice().sort(ascNum);
-          var count2 = 1;
-          var maxCount = 0;
-          var numMaxCount = 0;
-          var mode_arr = [];
-          var i2;
-          for (i2 = 0; i2 < arrLen; i2++) {
-            if (_arr[i2] === _arr[i2 + 1]) {
-              count2++;
-            } else {
-              if (count2 > maxCount) {
-                mode_arr = [_arr[i2]];
-                maxCount = count2;
-                numMaxCount = 0;
-              } else if (count2 === maxCount) {
-                mode_arr.push(_arr[i2]);
-                numMaxCount++;
-              }
-              count2 = 1;
-            }
-          }
-          return numMaxCount === 0 ? mode_arr[0] : mode_arr;
-        };
-        jStat4.range = function range(arr) {
-          return jStat4.max(arr) - jStat4.min(arr);
-        };
-        jStat4.variance = function variance(arr, flag) {
-          return jStat4.sumsqerr(arr) / (arr.length - (flag ? 1 : 0));
-        };
-        jStat4.pooledvariance = function pooledvariance(arr) {
-          var sumsqerr = arr.reduce(function(a, samples) {
-            return a + jStat4.sumsqerr(samples);
-          }, 0);
-          var count2 = arr.reduce(function(a, samples) {
-            return a + samples.length;
-          }, 0);
-          return sumsqerr / (count2 - arr.length);
-        };
-        jStat4.deviation = function(arr) {
-          var mean2 = jStat4.mean(arr);
-          var arrlen = arr.length;
-          var dev = new Array(arrlen);
-          for (var i2 = 0; i2 < arrlen; i2++) {
-            dev[i2] = arr[i2] - mean2;
-          }
-          return dev;
-        };
-        jStat4.stdev = function stdev(arr, flag) {
-          return Math2.sqrt(jStat4.variance(arr, flag));
-        };
-        jStat4.pooledstdev = function pooledstdev(arr) {
-          return Math2.sqrt(jStat4.pooledvariance(arr));
-        };
-        jStat4.meandev = function meandev(arr) {
-          var mean2 = jStat4.mean(arr);
-          var a = [];
-          for (var i2 = arr.length - 1; i2 >= 0; i2--) {
-            a.push(Math2.abs(arr[i2] - mean2));
-          }
-          return jStat4.mean(a);
-        };
-        jStat4.meddev = function meddev(arr) {
-          var median = jStat4.median(arr);
-          var a = [];
-          for (var i2 = arr.length - 1; i2 >= 0; i2--) {
-            a.push(Math2.abs(arr[i2] - median));
-          }
-          return jStat4.median(a);
-        };
-        jStat4.coeffvar = function coeffvar(arr) {
-          return jStat4.stdev(arr) / jStat4.mean(arr);
-        };
-        jStat4.quartiles = function quartiles(arr) {
-          var arrlen = arr.length;
-          var _arr = arr.slice().sort(ascNum);
-          return [
-            _arr[Math2.round(arrlen / 4) - 1],
-            _arr[Math2.round(arrlen / 2) - 1],
-            _arr[Math2.round(arrlen * 3 / 4) - 1]
-          ];
-        };
-        jStat4.quantiles = function quantiles(arr, quantilesArray, alphap, betap) {
-          var sortedArray = arr.slice().sort(ascNum);
-          var quantileVals = [quantilesArray.length];
-          var n = arr.length;
-          var i2, p, m, aleph, k, gamma;
-          if (typeof alphap === "undefined")
-            alphap = 3 / 8;
-          if (typeof betap === "undefined")
-            betap = 3 / 8;
-          for (i2 = 0; i2 < quantilesArray.length; i2++) {
-            p = quantilesArray[i2];
-            m = alphap + p * (1 - alphap - betap);
-            aleph = n * p + m;
-            k = Math2.floor(clip2(aleph, 1, n - 1));
-            gamma = clip2(aleph - k, 0, 1);
-            quantileVals[i2] = (1 - gamma) * sortedArray[k - 1] + gamma * sortedArray[k];
-          }
-          return quantileVals;
-        };
-        jStat4.percentile = function percentile(arr, k, exclusive) {
-          var _arr = arr.slice().sort(ascNum);
-          var realIndex = k * (_arr.length + (exclusive ? 1 : -1)) + (exclusive ? 0 : 1);
-          var index = parseInt(realIndex);
-          var frac = realIndex - index;
-          if (index + 1 < _arr.length) {
-            return _arr[index - 1] + frac * (_arr[index] - _arr[index - 1]);
-          } else {
-            return _arr[index - 1];
-          }
-        };
-        jStat4.percentileOfScore = function percentileOfScore(arr, score, kind) {
-          var counter = 0;
-          var len = arr.length;
-          var strict = false;
-          var value, i2;
-          if (kind === "strict")
-            strict = true;
-          for (i2 = 0; i2 < len; i2++) {
-            value = arr[i2];
-            if (strict && value < score || !strict && value <= score) {
-              counter++;
-            }
-          }
-          return counter / len;
-        };
-        jStat4.histogram = function histogram(arr, binCnt) {
-          binCnt = binCnt || 4;
-          var first = jStat4.min(arr);
-          var binWidth = (jStat4.max(arr) - first) / binCnt;
-          var len = arr.length;
-          var bins = [];
-          var i2;
-          for (i2 = 0; i2 < binCnt; i2++)
-            bins[i2] = 0;
-          for (i2 = 0; i2 < len; i2++)
-            bins[Math2.min(Math2.floor((arr[i2] - first) / binWidth), binCnt - 1)] += 1;
-          return bins;
-        };
-        jStat4.covariance = function covariance(arr1, arr2) {
-          var u = jStat4.mean(arr1);
-          var v = jStat4.mean(arr2);
-          var arr1Len = arr1.length;
-          var sq_dev = new Array(arr1Len);
-          var i2;
-          for (i2 = 0; i2 < arr1Len; i2++)
-            sq_dev[i2] = (arr1[i2] - u) * (arr2[i2] - v);
-          return jStat4.sum(sq_dev) / (arr1Len - 1);
-        };
-        jStat4.corrcoeff = function corrcoeff(arr1, arr2) {
-          return jStat4.covariance(arr1, arr2) / jStat4.stdev(arr1, 1) / jStat4.stdev(arr2, 1);
-        };
-        jStat4.spearmancoeff = function(arr1, arr2) {
-          arr1 = jStat4.rank(arr1);
-          arr2 = jStat4.rank(arr2);
-          return jStat4.corrcoeff(arr1, arr2);
-        };
-        jStat4.stanMoment = function stanMoment(arr, n) {
-          var mu = jStat4.mean(arr);
-          var sigma = jStat4.stdev(arr);
-          var len = arr.length;
-          var skewSum = 0;
-          for (var i2 = 0; i2 < len; i2++)
-            skewSum += Math2.pow((arr[i2] - mu) / sigma, n);
-          return skewSum / arr.length;
-        };
-        jStat4.skewness = function skewness(arr) {
-          return jStat4.stanMoment(arr, 3);
-        };
-        jStat4.kurtosis = function kurtosis(arr) {
-          return jStat4.stanMoment(arr, 4) - 3;
-        };
-        var jProto = jStat4.prototype;
-        (function(funcs) {
-          for (var i2 = 0; i2 < funcs.length; i2++) (function(passfunc) {
-            jProto[passfunc] = function(fullbool, func) {
-              var arr = [];
-              var i3 = 0;
-              var tmpthis = this;
-              if (isFunction(fullbool)) {
-                func = fullbool;
-                fullbool = false;
-              }
-              if (func) {
-                setTimeout(function() {
-                  func.call(tmpthis, jProto[passfunc].call(tmpthis, fullbool));
-                });
-                return this;
-              }
-              if (this.length > 1) {
-                tmpthis = fullbool === true ? this : this.transpose();
-                for (; i3 < tmpthis.length; i3++)
-                  arr[i3] = jStat4[passfunc](tmpthis[i3]);
-                return arr;
-              }
-              return jStat4[passfunc](this[0], fullbool);
-            };
-          })(funcs[i2]);
-        })("cumsum cumprod".split(" "));
-        (function(funcs) {
-          for (var i2 = 0; i2 < funcs.length; i2++) (function(passfunc) {
-            jProto[passfunc] = function(fullbool, func) {
-              var arr = [];
-              var i3 = 0;
-              var tmpthis = this;
-              if (isFunction(fullbool)) {
-                func = fullbool;
-                fullbool = false;
-              }
-              if (func) {
-                setTimeout(function() {
-                  func.call(tmpthis, jProto[passfunc].call(tmpthis, fullbool));
-                });
-                return this;
-              }
-              if (this.length > 1) {
-                if (passfunc !== "sumrow")
-                  tmpthis = fullbool === true ? this : this.transpose();
-                for (; i3 < tmpthis.length; i3++)
-                  arr[i3] = jStat4[passfunc](tmpthis[i3]);
-                return fullbool === true ? jStat4[passfunc](jStat4.utils.toVector(arr)) : arr;
-              }
-              return jStat4[passfunc](this[0], fullbool);
-            };
-          })(funcs[i2]);
-        })("sum sumsqrd sumsqerr sumrow product min max unique mean meansqerr geomean median diff rank mode range variance deviation stdev meandev meddev coeffvar quartiles histogram skewness kurtosis".split(" "));
-        (function(funcs) {
-          for (var i2 = 0; i2 < funcs.length; i2++) (function(passfunc) {
-            jProto[passfunc] = function() {
-              var arr = [];
-              var i3 = 0;
-              var tmpthis = this;
-              var args = Array.prototype.slice.call(arguments);
-              var callbackFunction;
-              if (isFunction(args[args.length - 1])) {
-                callbackFunction = args[args.length - 1];
-                var argsToPass = args.slice(0, args.length - 1);
-                setTimeout(function() {
-                  callbackFunction.call(
-                    tmpthis,
-                    jProto[passfunc].apply(tmpthis, argsToPass)
-                  );
-                });
-                return this;
-              } else {
-                callbackFunction = void 0;
-                var curriedFunction = function curriedFunction2(vector) {
-                  return jStat4[passfunc].apply(tmpthis, [vector].concat(args));
-                };
-              }
-              if (this.length > 1) {
-                tmpthis = tmpthis.transpose();
-                for (; i3 < tmpthis.length; i3++)
-                  arr[i3] = curriedFunction(tmpthis[i3]);
-                return arr;
-              }
-              return curriedFunction(this[0]);
-            };
-          })(funcs[i2]);
-        })("quantiles percentileOfScore".split(" "));
-      })(jStat3, Math);
-      (function(jStat4, Math2) {
-        jStat4.gammaln = function gammaln(x2) {
-          var j = 0;
-          var cof = [
-            76.18009172947146,
-            -86.50532032941678,
-            24.01409824083091,
-            -1.231739572450155,
-            0.001208650973866179,
-            -5395239384953e-18
-          ];
-          var ser = 1.000000000190015;
-          var xx, y, tmp;
-          tmp = (y = xx = x2) + 5.5;
-          tmp -= (xx + 0.5) * Math2.log(tmp);
-          for (; j < 6; j++)
-            ser += cof[j] / ++y;
-          return Math2.log(2.5066282746310007 * ser / xx) - tmp;
-        };
-        jStat4.loggam = function loggam(x2) {
-          var x0, x22, xp, gl, gl0;
-          var k, n;
-          var a = [
-            0.08333333333333333,
-            -0.002777777777777778,
-            7936507936507937e-19,
-            -5952380952380952e-19,
-            8417508417508418e-19,
-            -0.001917526917526918,
-            0.00641025641025641,
-            -0.02955065359477124,
-            0.1796443723688307,
-            -1.3924322169059
-          ];
-          x0 = x2;
-          n = 0;
-          if (x2 == 1 || x2 == 2) {
-            return 0;
-          }
-          if (x2 <= 7) {
-            n = Math2.floor(7 - x2);
-            x0 = x2 + n;
-          }
-          x22 = 1 / (x0 * x0);
-          xp = 2 * Math2.PI;
-          gl0 = a[9];
-          for (k = 8; k >= 0; k--) {
-            gl0 *= x22;
-            gl0 += a[k];
-          }
-          gl = gl0 / x0 + 0.5 * Math2.log(xp) + (x0 - 0.5) * Math2.log(x0) - x0;
-          if (x2 <= 7) {
-            for (k = 1; k <= n; k++) {
-              gl -= Math2.log(x0 - 1);
-              x0 -= 1;
-            }
-          }
-          return gl;
-        };
-        jStat4.gammafn = function gammafn(x2) {
-          var p = [
-            -1.716185138865495,
-            24.76565080557592,
-            -379.80425647094563,
-            629.3311553128184,
-            866.9662027904133,
-            -31451.272968848367,
-            -36144.413418691176,
-            66456.14382024054
-          ];
-          var q = [
-            -30.8402300119739,
-            315.35062697960416,
-            -1015.1563674902192,
-            -3107.771671572311,
-            22538.11842098015,
-            4755.846277527881,
-            -134659.9598649693,
-            -115132.2596755535
-          ];
-          var fact = false;
-          var n = 0;
-          var xden = 0;
-          var xnum = 0;
-          var y = x2;
-          var i2, z, yi, res;
-          if (x2 > 171.6243769536076) {
-            return Infinity;
-          }
-          if (y <= 0) {
-            res = y % 1 + 36e-17;
-            if (res) {
-              fact = (!(y & 1) ? 1 : -1) * Math2.PI / Math2.sin(Math2.PI * res);
-              y = 1 - y;
-            } else {
-              return Infinity;
-            }
-          }
-          yi = y;
-          if (y < 1) {
-            z = y++;
-          } else {
-            z = (y -= n = (y | 0) - 1) - 1;
-          }
-          for (i2 = 0; i2 < 8; ++i2) {
-            xnum = (xnum + p[i2]) * z;
-            xden = xden * z + q[i2];
-          }
-          res = xnum / xden + 1;
-          if (yi < y) {
-            res /= yi;
-          } else if (yi > y) {
-            for (i2 = 0; i2 < n; ++i2) {
-              res *= y;
-              y++;
-            }
-          }
-          if (fact) {
-            res = fact / res;
-          }
-          return res;
-        };
-        jStat4.gammap = function gammap(a, x2) {
-          return jStat4.lowRegGamma(a, x2) * jStat4.gammafn(a);
-        };
-        jStat4.lowRegGamma = function lowRegGamma(a, x2) {
-          var aln = jStat4.gammaln(a);
-          var ap = a;
-          var sum = 1 / a;
-          var del = sum;
-          var b = x2 + 1 - a;
-          var c = 1 / 1e-30;
-          var d = 1 / b;
-          var h = d;
-          var i2 = 1;
-          var ITMAX = -~(Math2.log(a >= 1 ? a : 1 / a) * 8.5 + a * 0.4 + 17);
-          var an;
-          if (x2 < 0 || a <= 0) {
-            return NaN;
-          } else if (x2 < a + 1) {
-            for (; i2 <= ITMAX; i2++) {
-              sum += del *= x2 / ++ap;
-            }
-            return sum * Math2.exp(-x2 + a * Math2.log(x2) - aln);
-          }
-          for (; i2 <= ITMAX; i2++) {
-            an = -i2 * (i2 - a);
-            b += 2;
-            d = an * d + b;
-            c = b + an / c;
-            d = 1 / d;
-            h *= d * c;
-          }
-          return 1 - h * Math2.exp(-x2 + a * Math2.log(x2) - aln);
-        };
-        jStat4.factorialln = function factorialln(n) {
-          return n < 0 ? NaN : jStat4.gammaln(n + 1);
-        };
-        jStat4.factorial = function factorial(n) {
-          return n < 0 ? NaN : jStat4.gammafn(n + 1);
-        };
-        jStat4.combination = function combination(n, m) {
-          return n > 170 || m > 170 ? Math2.exp(jStat4.combinationln(n, m)) : jStat4.factorial(n) / jStat4.factorial(m) / jStat4.factorial(n - m);
-        };
-        jStat4.combinationln = function combinationln(n, m) {
-          return jStat4.factorialln(n) - jStat4.factorialln(m) - jStat4.factorialln(n - m);
-        };
-        jStat4.permutation = function permutation(n, m) {
-          return jStat4.factorial(n) / jStat4.factorial(n - m);
-        };
-        jStat4.betafn = function betafn(x2, y) {
-          if (x2 <= 0 || y <= 0)
-            return void 0;
-          return x2 + y > 170 ? Math2.exp(jStat4.betaln(x2, y)) : jStat4.gammafn(x2) * jStat4.gammafn(y) / jStat4.gammafn(x2 + y);
-        };
-        jStat4.betaln = function betaln(x2, y) {
-          return jStat4.gammaln(x2) + jStat4.gammaln(y) - jStat4.gammaln(x2 + y);
-        };
-        jStat4.betacf = function betacf(x2, a, b) {
-          var fpmin = 1e-30;
-          var m = 1;
-          var qab = a + b;
-          var qap = a + 1;
-          var qam = a - 1;
-          var c = 1;
-          var d = 1 - qab * x2 / qap;
-          var m2, aa, del, h;
-          if (Math2.abs(d) < fpmin)
-            d = fpmin;
-          d = 1 / d;
-          h = d;
-          for (; m <= 100; m++) {
-            m2 = 2 * m;
-            aa = m * (b - m) * x2 / ((qam + m2) * (a + m2));
-            d = 1 + aa * d;
-            if (Math2.abs(d) < fpmin)
-              d = fpmin;
-            c = 1 + aa / c;
-            if (Math2.abs(c) < fpmin)
-              c = fpmin;
-            d = 1 / d;
-            h *= d * c;
-            aa = -(a + m) * (qab + m) * x2 / ((a + m2) * (qap + m2));
-            d = 1 + aa * d;
-            if (Math2.abs(d) < fpmin)
-              d = fpmin;
-            c = 1 + aa / c;
-            if (Math2.abs(c) < fpmin)
-              c = fpmin;
-            d = 1 / d;
-            del = d * c;
-            h *= del;
-            if (Math2.abs(del - 1) < 3e-7)
-              break;
-          }
-          return h;
-        };
-        jStat4.gammapinv = function gammapinv(p, a) {
-          var j = 0;
-          var a1 = a - 1;
-          var EPS = 1e-8;
-          var gln = jStat4.gammaln(a);
-          var x2, err2, t, u, pp, lna1, afac;
-          if (p >= 1)
-            return Math2.max(100, a + 100 * Math2.sqrt(a));
-          if (p <= 0)
-            return 0;
-          if (a > 1) {
-            lna1 = Math2.log(a1);
-            afac = Math2.exp(a1 * (lna1 - 1) - gln);
-            pp = p < 0.5 ? p : 1 - p;
-            t = Math2.sqrt(-2 * Math2.log(pp));
-            x2 = (2.30753 + t * 0.27061) / (1 + t * (0.99229 + t * 0.04481)) - t;
-            if (p < 0.5)
-              x2 = -x2;
-            x2 = Math2.max(
-              1e-3,
-              a * Math2.pow(1 - 1 / (9 * a) - x2 / (3 * Math2.sqrt(a)), 3)
-            );
-          } else {
-            t = 1 - a * (0.253 + a * 0.12);
-            if (p < t)
-              x2 = Math2.pow(p / t, 1 / a);
-            else
-              x2 = 1 - Math2.log(1 - (p - t) / (1 - t));
-          }
-          for (; j < 12; j++) {
-            if (x2 <= 0)
-              return 0;
-            err2 = jStat4.lowRegGamma(a, x2) - p;
-            if (a > 1)
-              t = afac * Math2.exp(-(x2 - a1) + a1 * (Math2.log(x2) - lna1));
-            else
-              t = Math2.exp(-x2 + a1 * Math2.log(x2) - gln);
-            u = err2 / t;
-            x2 -= t = u / (1 - 0.5 * Math2.min(1, u * ((a - 1) / x2 - 1)));
-            if (x2 <= 0)
-              x2 = 0.5 * (x2 + t);
-            if (Math2.abs(t) < EPS * x2)
-              break;
-          }
-          return x2;
-        };
-        jStat4.erf = function erf(x2) {
-          var cof = [
-            -1.3026537197817094,
-            0.6419697923564902,
-            0.019476473204185836,
-            -0.00956151478680863,
-            -946595344482036e-18,
-            366839497852761e-18,
-            42523324806907e-18,
-            -20278578112534e-18,
-            -1624290004647e-18,
-            130365583558e-17,
-            15626441722e-18,
-            -85238095915e-18,
-            6529054439e-18,
-            5059343495e-18,
-            -991364156e-18,
-            -227365122e-18,
-            96467911e-18,
-            2394038e-18,
-            -6886027e-18,
-            894487e-18,
-            313092e-18,
-            -112708e-18,
-            381e-18,
-            7106e-18,
-            -1523e-18,
-            -94e-18,
-            121e-18,
-            -28e-18
-          ];
-          var j = cof.length - 1;
-          var isneg = false;
-          var d = 0;
-          var dd = 0;
-          var t, ty, tmp, res;
-          if (x2 < 0) {
-            x2 = -x2;
-            isneg = true;
-          }
-          t = 2 / (2 + x2);
-          ty = 4 * t - 2;
-          for (; j > 0; j--) {
-            tmp = d;
-            d = ty * d - dd + cof[j];
-            dd = tmp;
-          }
-          res = t * Math2.exp(-x2 * x2 + 0.5 * (cof[0] + ty * d) - dd);
-          return isneg ? res - 1 : 1 - res;
-        };
-        jStat4.erfc = function erfc(x2) {
-          return 1 - jStat4.erf(x2);
-        };
-        jStat4.erfcinv = function erfcinv(p) {
-          var j = 0;
-          var x2, err2, t, pp;
-          if (p >= 2)
-            return -100;
-          if (p <= 0)
-            return 100;
-          pp = p < 1 ? p : 2 - p;
-          t = Math2.sqrt(-2 * Math2.log(pp / 2));
-          x2 = -0.70711 * ((2.30753 + t * 0.27061) / (1 + t * (0.99229 + t * 0.04481)) - t);
-          for (; j < 2; j++) {
-            err2 = jStat4.erfc(x2) - pp;
-            x2 += err2 / (1.1283791670955126 * Math2.exp(-x2 * x2) - x2 * err2);
-          }
-          return p < 1 ? x2 : -x2;
-        };
-        jStat4.ibetainv = function ibetainv(p, a, b) {
-          var EPS = 1e-8;
-          var a1 = a - 1;
-          var b1 = b - 1;
-          var j = 0;
-          var lna, lnb, pp, t, u, err2, x2, al, h, w, afac;
-          if (p <= 0)
-            return 0;
-          if (p >= 1)
-            return 1;
-          if (a >= 1 && b >= 1) {
-            pp = p < 0.5 ? p : 1 - p;
-            t = Math2.sqrt(-2 * Math2.log(pp));
-            x2 = (2.30753 + t * 0.27061) / (1 + t * (0.99229 + t * 0.04481)) - t;
-            if (p < 0.5)
-              x2 = -x2;
-            al = (x2 * x2 - 3) / 6;
-            h = 2 / (1 / (2 * a - 1) + 1 / (2 * b - 1));
-            w = x2 * Math2.sqrt(al + h) / h - (1 / (2 * b - 1) - 1 / (2 * a - 1)) * (al + 5 / 6 - 2 / (3 * h));
-            x2 = a / (a + b * Math2.exp(2 * w));
-          } else {
-            lna = Math2.log(a / (a + b));
-            lnb = Math2.log(b / (a + b));
-            t = Math2.exp(a * lna) / a;
-            u = Math2.exp(b * lnb) / b;
-            w = t + u;
-            if (p < t / w)
-              x2 = Math2.pow(a * w * p, 1 / a);
-            else
-              x2 = 1 - Math2.pow(b * w * (1 - p), 1 / b);
-          }
-          afac = -jStat4.gammaln(a) - jStat4.gammaln(b) + jStat4.gammaln(a + b);
-          for (; j < 10; j++) {
-            if (x2 === 0 || x2 === 1)
-              return x2;
-            err2 = jStat4.ibeta(x2, a, b) - p;
-            t = Math2.exp(a1 * Math2.log(x2) + b1 * Math2.log(1 - x2) + afac);
-            u = err2 / t;
-            x2 -= t = u / (1 - 0.5 * Math2.min(1, u * (a1 / x2 - b1 / (1 - x2))));
-            if (x2 <= 0)
-              x2 = 0.5 * (x2 + t);
-            if (x2 >= 1)
-              x2 = 0.5 * (x2 + t + 1);
-            if (Math2.abs(t) < EPS * x2 && j > 0)
-              break;
-          }
-          return x2;
-        };
-        jStat4.ibeta = function ibeta2(x2, a, b) {
-          var bt = x2 === 0 || x2 === 1 ? 0 : Math2.exp(jStat4.gammaln(a + b) - jStat4.gammaln(a) - jStat4.gammaln(b) + a * Math2.log(x2) + b * Math2.log(1 - x2));
-          if (x2 < 0 || x2 > 1)
-            return false;
-          if (x2 < (a + 1) / (a + b + 2))
-            return bt * jStat4.betacf(x2, a, b) / a;
-          return 1 - bt * jStat4.betacf(1 - x2, b, a) / b;
-        };
-        jStat4.randn = function randn(n, m) {
-          var u, v, x2, y, q;
-          if (!m)
-            m = n;
-          if (n)
-            return jStat4.create(n, m, function() {
-              return jStat4.randn();
-            });
-          do {
-            u = jStat4._random_fn();
-            v = 1.7156 * (jStat4._random_fn() - 0.5);
-            x2 = u - 0.449871;
-            y = Math2.abs(v) + 0.386595;
-            q = x2 * x2 + y * (0.196 * y - 0.25472 * x2);
-          } while (q > 0.27597 && (q > 0.27846 || v * v > -4 * Math2.log(u) * u * u));
-          return v / u;
-        };
-        jStat4.randg = function randg(shape, n, m) {
-          var oalph = shape;
-          var a1, a2, u, v, x2, mat;
-          if (!m)
-            m = n;
-          if (!shape)
-            shape = 1;
-          if (n) {
-            mat = jStat4.zeros(n, m);
-            mat.alter(function() {
-              return jStat4.randg(shape);
-            });
-            return mat;
-          }
-          if (shape < 1)
-            shape += 1;
-          a1 = shape - 1 / 3;
-          a2 = 1 / Math2.sqrt(9 * a1);
-          do {
-            do {
-              x2 = jStat4.randn();
-              v = 1 + a2 * x2;
-            } while (v <= 0);
-            v = v * v * v;
-            u = jStat4._random_fn();
-          } while (u > 1 - 0.331 * Math2.pow(x2, 4) && Math2.log(u) > 0.5 * x2 * x2 + a1 * (1 - v + Math2.log(v)));
-          if (shape == oalph)
-            return a1 * v;
-          do {
-            u = jStat4._random_fn();
-          } while (u === 0);
-          return Math2.pow(u, 1 / oalph) * a1 * v;
-        };
-        (function(funcs) {
-          for (var i2 = 0; i2 < funcs.length; i2++) (function(passfunc) {
-            jStat4.fn[passfunc] = function() {
-              return jStat4(
-                jStat4.map(this, function(value) {
-                  return jStat4[passfunc](value);
-                })
-              );
-            };
-          })(funcs[i2]);
-        })("gammaln gammafn factorial factorialln".split(" "));
-        (function(funcs) {
-          for (var i2 = 0; i2 < funcs.length; i2++) (function(passfunc) {
-            jStat4.fn[passfunc] = function() {
-              return jStat4(jStat4[passfunc].apply(null, arguments));
-            };
-          })(funcs[i2]);
-        })("randn".split(" "));
-      })(jStat3, Math);
-      (function(jStat4, Math2) {
-        (function(list) {
-          for (var i2 = 0; i2 < list.length; i2++) (function(func) {
-            jStat4[func] = function f(a, b, c) {
-              if (!(this instanceof f))
-                return new f(a, b, c);
-              this._a = a;
-              this._b = b;
-              this._c = c;
-              return this;
-            };
-            jStat4.fn[func] = function(a, b, c) {
-              var newthis = jStat4[func](a, b, c);
-              newthis.data = this;
-              return newthis;
-            };
-            jStat4[func].prototype.sample = function(arr) {
-              var a = this._a;
-              var b = this._b;
-              var c = this._c;
-              if (arr)
-                return jStat4.alter(arr, function() {
-                  return jStat4[func].sample(a, b, c);
-                });
-              else
-                return jStat4[func].sample(a, b, c);
-            };
-            (function(vals) {
-              for (var i3 = 0; i3 < vals.length; i3++) (function(fnfunc) {
-                jStat4[func].prototype[fnfunc] = function(x2) {
-                  var a = this._a;
-                  var b = this._b;
-                  var c = this._c;
-                  if (!x2 && x2 !== 0)
-                    x2 = this.data;
-                  if (typeof x2 !== "number") {
-                    return jStat4.fn.map.call(x2, function(x3) {
-                      return jStat4[func][fnfunc](x3, a, b, c);
-                    });
-                  }
-                  return jStat4[func][fnfunc](x2, a, b, c);
-                };
-              })(vals[i3]);
-            })("pdf cdf inv".split(" "));
-            (function(vals) {
-              for (var i3 = 0; i3 < vals.length; i3++) (function(fnfunc) {
-                jStat4[func].prototype[fnfunc] = function() {
-                  return jStat4[func][fnfunc](this._a, this._b, this._c);
-                };
-              })(vals[i3]);
-            })("mean median mode variance".split(" "));
-          })(list[i2]);
-        })("beta centralF cauchy chisquare exponential gamma invgamma kumaraswamy laplace lognormal noncentralt normal pareto studentt weibull uniform binomial negbin hypgeom poisson triangular tukey arcsine".split(" "));
-        jStat4.extend(jStat4.beta, {
-          pdf: function pdf(x2, alpha, beta) {
-            if (x2 > 1 || x2 < 0)
-              return 0;
-            if (alpha == 1 && beta == 1)
-              return 1;
-            if (alpha < 512 && beta < 512) {
-              return Math2.pow(x2, alpha - 1) * Math2.pow(1 - x2, beta - 1) / jStat4.betafn(alpha, beta);
-            } else {
-              return Math2.exp((alpha - 1) * Math2.log(x2) + (beta - 1) * Math2.log(1 - x2) - jStat4.betaln(alpha, beta));
-            }
-          },
-          cdf: function cdf(x2, alpha, beta) {
-            return x2 > 1 || x2 < 0 ? (x2 > 1) * 1 : jStat4.ibeta(x2, alpha, beta);
-          },
-          inv: function inv(x2, alpha, beta) {
-            return jStat4.ibetainv(x2, alpha, beta);
-          },
-          mean: function mean2(alpha, beta) {
-            return alpha / (alpha + beta);
-          },
-          median: function median(alpha, beta) {
-            return jStat4.ibetainv(0.5, alpha, beta);
-          },
-          mode: function mode(alpha, beta) {
-            return (alpha - 1) / (alpha + beta - 2);
-          },
-          // return a random sample
-          sample: function sample(alpha, beta) {
-            var u = jStat4.randg(alpha);
-            return u / (u + jStat4.randg(beta));
-          },
-          variance: function variance(alpha, beta) {
-            return alpha * beta / (Math2.pow(alpha + beta, 2) * (alpha + beta + 1));
-          }
-        });
-        jStat4.extend(jStat4.centralF, {
-          // This implementation of the pdf function avoids float overflow
-          // See the way that R calculates this value:
-          // https://svn.r-project.org/R/trunk/src/nmath/df.c
-          pdf: function pdf(x2, df1, df2) {
-            var p, q, f;
-            if (x2 < 0)
-              return 0;
-            if (df1 <= 2) {
-              if (x2 === 0 && df1 < 2) {
-                return Infinity;
-              }
-              if (x2 === 0 && df1 === 2) {
-                return 1;
-              }
-              return 1 / jStat4.betafn(df1 / 2, df2 / 2) * Math2.pow(df1 / df2, df1 / 2) * Math2.pow(x2, df1 / 2 - 1) * Math2.pow(1 + df1 / df2 * x2, -(df1 + df2) / 2);
-            }
-            p = df1 * x2 / (df2 + x2 * df1);
-            q = df2 / (df2 + x2 * df1);
-            f = df1 * q / 2;
-            return f * jStat4.binomial.pdf((df1 - 2) / 2, (df1 + df2 - 2) / 2, p);
-          },
-          cdf: function cdf(x2, df1, df2) {
-            if (x2 < 0)
-              return 0;
-            return jStat4.ibeta(df1 * x2 / (df1 * x2 + df2), df1 / 2, df2 / 2);
-          },
-          inv: function inv(x2, df1, df2) {
-            return df2 / (df1 * (1 / jStat4.ibetainv(x2, df1 / 2, df2 / 2) - 1));
-          },
-          mean: function mean2(df1, df2) {
-            return df2 > 2 ? df2 / (df2 - 2) : void 0;
-          },
-          mode: function mode(df1, df2) {
-            return df1 > 2 ? df2 * (df1 - 2) / (df1 * (df2 + 2)) : void 0;
-          },
-          // return a random sample
-          sample: function sample(df1, df2) {
-            var x1 = jStat4.randg(df1 / 2) * 2;
-            var x2 = jStat4.randg(df2 / 2) * 2;
-            return x1 / df1 / (x2 / df2);
-          },
-          variance: function variance(df1, df2) {
-            if (df2 <= 4)
-              return void 0;
-            return 2 * df2 * df2 * (df1 + df2 - 2) / (df1 * (df2 - 2) * (df2 - 2) * (df2 - 4));
-          }
-        });
-        jStat4.extend(jStat4.cauchy, {
-          pdf: function pdf(x2, local, scale) {
-            if (scale < 0) {
-              return 0;
-            }
-            return scale / (Math2.pow(x2 - local, 2) + Math2.pow(scale, 2)) / Math2.PI;
-          },
-          cdf: function cdf(x2, local, scale) {
-            return Math2.atan((x2 - local) / scale) / Math2.PI + 0.5;
-          },
-          inv: function(p, local, scale) {
-            return local + scale * Math2.tan(Math2.PI * (p - 0.5));
-          },
-          median: function median(local) {
-            return local;
-          },
-          mode: function mode(local) {
-            return local;
-          },
-          sample: function sample(local, scale) {
-            return jStat4.randn() * Math2.sqrt(1 / (2 * jStat4.randg(0.5))) * scale + local;
-          }
-        });
-        jStat4.extend(jStat4.chisquare, {
-          pdf: function pdf(x2, dof) {
-            if (x2 < 0)
-              return 0;
-            return x2 === 0 && dof === 2 ? 0.5 : Math2.exp((dof / 2 - 1) * Math2.log(x2) - x2 / 2 - dof / 2 * Math2.log(2) - jStat4.gammaln(dof / 2));
-          },
-          cdf: function cdf(x2, dof) {
-            if (x2 < 0)
-              return 0;
-            return jStat4.lowRegGamma(dof / 2, x2 / 2);
-          },
-          inv: function(p, dof) {
-            return 2 * jStat4.gammapinv(p, 0.5 * dof);
-          },
-          mean: function(dof) {
-            return dof;
-          },
-          // TODO: this is an approximation (is there a better way?)
-          median: function median(dof) {
-            return dof * Math2.pow(1 - 2 / (9 * dof), 3);
-          },
-          mode: function mode(dof) {
-            return dof - 2 > 0 ? dof - 2 : 0;
-          },
-          sample: function sample(dof) {
-            return jStat4.randg(dof / 2) * 2;
-          },
-          variance: function variance(dof) {
-            return 2 * dof;
-          }
-        });
-        jStat4.extend(jStat4.exponential, {
-          pdf: function pdf(x2, rate) {
-            return x2 < 0 ? 0 : rate * Math2.exp(-rate * x2);
-          },
-          cdf: function cdf(x2, rate) {
-            return x2 < 0 ? 0 : 1 - Math2.exp(-rate * x2);
-          },
-          inv: function(p, rate) {
-            return -Math2.log(1 - p) / rate;
-          },
-          mean: function(rate) {
-            return 1 / rate;
-          },
-          median: function(rate) {
-            return 1 / rate * Math2.log(2);
-          },
-          mode: function mode() {
-            return 0;
-          },
-          sample: function sample(rate) {
-            return -1 / rate * Math2.log(jStat4._random_fn());
-          },
-          variance: function(rate) {
-            return Math2.pow(rate, -2);
-          }
-        });
-        jStat4.extend(jStat4.gamma, {
-          pdf: function pdf(x2, shape, scale) {
-            if (x2 < 0)
-              return 0;
-            return x2 === 0 && shape === 1 ? 1 / scale : Math2.exp((shape - 1) * Math2.log(x2) - x2 / scale - jStat4.gammaln(shape) - shape * Math2.log(scale));
-          },
-          cdf: function cdf(x2, shape, scale) {
-            if (x2 < 0)
-              return 0;
-            return jStat4.lowRegGamma(shape, x2 / scale);
-          },
-          inv: function(p, shape, scale) {
-            return jStat4.gammapinv(p, shape) * scale;
-          },
-          mean: function(shape, scale) {
-            return shape * scale;
-          },
-          mode: function mode(shape, scale) {
-            if (shape > 1) return (shape - 1) * scale;
-            return void 0;
-          },
-          sample: function sample(shape, scale) {
-            return jStat4.randg(shape) * scale;
-          },
-          variance: function variance(shape, scale) {
-            return shape * scale * scale;
-          }
-        });
-        jStat4.extend(jStat4.invgamma, {
-          pdf: function pdf(x2, shape, scale) {
-            if (x2 <= 0)
-              return 0;
-            return Math2.exp(-(shape + 1) * Math2.log(x2) - scale / x2 - jStat4.gammaln(shape) + shape * Math2.log(scale));
-          },
-          cdf: function cdf(x2, shape, scale) {
-            if (x2 <= 0)
-              return 0;
-            return 1 - jStat4.lowRegGamma(shape, scale / x2);
-          },
-          inv: function(p, shape, scale) {
-            return scale / jStat4.gammapinv(1 - p, shape);
-          },
-          mean: function(shape, scale) {
-            return shape > 1 ? scale / (shape - 1) : void 0;
-          },
-          mode: function mode(shape, scale) {
-            return scale / (shape + 1);
-          },
-          sample: function sample(shape, scale) {
-            return scale / jStat4.randg(shape);
-          },
-          variance: function variance(shape, scale) {
-            if (shape <= 2)
-              return void 0;
-            return scale * scale / ((shape - 1) * (shape - 1) * (shape - 2));
-          }
-        });
-        jStat4.extend(jStat4.kumaraswamy, {
-          pdf: function pdf(x2, alpha, beta) {
-            if (x2 === 0 && alpha === 1)
-              return beta;
-            else if (x2 === 1 && beta === 1)
-              return alpha;
-            return Math2.exp(Math2.log(alpha) + Math2.log(beta) + (alpha - 1) * Math2.log(x2) + (beta - 1) * Math2.log(1 - Math2.pow(x2, alpha)));
-          },
-          cdf: function cdf(x2, alpha, beta) {
-            if (x2 < 0)
-              return 0;
-            else if (x2 > 1)
-              return 1;
-            return 1 - Math2.pow(1 - Math2.pow(x2, alpha), beta);
-          },
-          inv: function inv(p, alpha, beta) {
-            return Math2.pow(1 - Math2.pow(1 - p, 1 / beta), 1 / alpha);
-          },
-          mean: function(alpha, beta) {
-            return beta * jStat4.gammafn(1 + 1 / alpha) * jStat4.gammafn(beta) / jStat4.gammafn(1 + 1 / alpha + beta);
-          },
-          median: function median(alpha, beta) {
-            return Math2.pow(1 - Math2.pow(2, -1 / beta), 1 / alpha);
-          },
-          mode: function mode(alpha, beta) {
-            if (!(alpha >= 1 && beta >= 1 && (alpha !== 1 && beta !== 1)))
-              return void 0;
-            return Math2.pow((alpha - 1) / (alpha * beta - 1), 1 / alpha);
-          },
-          variance: function variance() {
-            throw new Error("variance not yet implemented");
-          }
-        });
-        jStat4.extend(jStat4.lognormal, {
-          pdf: function pdf(x2, mu, sigma) {
-            if (x2 <= 0)
-              return 0;
-            return Math2.exp(-Math2.log(x2) - 0.5 * Math2.log(2 * Math2.PI) - Math2.log(sigma) - Math2.pow(Math2.log(x2) - mu, 2) / (2 * sigma * sigma));
-          },
-          cdf: function cdf(x2, mu, sigma) {
-            if (x2 < 0)
-              return 0;
-            return 0.5 + 0.5 * jStat4.erf((Math2.log(x2) - mu) / Math2.sqrt(2 * sigma * sigma));
-          },
-          inv: function(p, mu, sigma) {
-            return Math2.exp(-1.4142135623730951 * sigma * jStat4.erfcinv(2 * p) + mu);
-          },
-          mean: function mean2(mu, sigma) {
-            return Math2.exp(mu + sigma * sigma / 2);
-          },
-          median: function median(mu) {
-            return Math2.exp(mu);
-          },
-          mode: function mode(mu, sigma) {
-            return Math2.exp(mu - sigma * sigma);
-          },
-          sample: function sample(mu, sigma) {
-            return Math2.exp(jStat4.randn() * sigma + mu);
-          },
-          variance: function variance(mu, sigma) {
-            return (Math2.exp(sigma * sigma) - 1) * Math2.exp(2 * mu + sigma * sigma);
-          }
-        });
-        jStat4.extend(jStat4.noncentralt, {
-          pdf: function pdf(x2, dof, ncp) {
-            var tol = 1e-14;
-            if (Math2.abs(ncp) < tol)
-              return jStat4.studentt.pdf(x2, dof);
-            if (Math2.abs(x2) < tol) {
-              return Math2.exp(jStat4.gammaln((dof + 1) / 2) - ncp * ncp / 2 - 0.5 * Math2.log(Math2.PI * dof) - jStat4.gammaln(dof / 2));
-            }
-            return dof / x2 * (jStat4.noncentralt.cdf(x2 * Math2.sqrt(1 + 2 / dof), dof + 2, ncp) - jStat4.noncentralt.cdf(x2, dof, ncp));
-          },
-          cdf: function cdf(x2, dof, ncp) {
-            var tol = 1e-14;
-            var min_iterations = 200;
-            if (Math2.abs(ncp) < tol)
-              return jStat4.studentt.cdf(x2, dof);
-            var flip = false;
-            if (x2 < 0) {
-              flip = true;
-              ncp = -ncp;
-            }
-            var prob = jStat4.normal.cdf(-ncp, 0, 1);
-            var value = tol + 1;
-            var lastvalue = value;
-            var y = x2 * x2 / (x2 * x2 + dof);
-            var j = 0;
-            var p = Math2.exp(-ncp * ncp / 2);
-            var q = Math2.exp(-ncp * ncp / 2 - 0.5 * Math2.log(2) - jStat4.gammaln(3 / 2)) * ncp;
-            while (j < min_iterations || lastvalue > tol || value > tol) {
-              lastvalue = value;
-              if (j > 0) {
-                p *= ncp * ncp / (2 * j);
-                q *= ncp * ncp / (2 * (j + 1 / 2));
-              }
-              value = p * jStat4.beta.cdf(y, j + 0.5, dof / 2) + q * jStat4.beta.cdf(y, j + 1, dof / 2);
-              prob += 0.5 * value;
-              j++;
-            }
-            return flip ? 1 - prob : prob;
-          }
-        });
-        jStat4.extend(jStat4.normal, {
-          pdf: function pdf(x2, mean2, std) {
-            return Math2.exp(-0.5 * Math2.log(2 * Math2.PI) - Math2.log(std) - Math2.pow(x2 - mean2, 2) / (2 * std * std));
-          },
-          cdf: function cdf(x2, mean2, std) {
-            return 0.5 * (1 + jStat4.erf((x2 - mean2) / Math2.sqrt(2 * std * std)));
-          },
-          inv: function(p, mean2, std) {
-            return -1.4142135623730951 * std * jStat4.erfcinv(2 * p) + mean2;
-          },
-          mean: function(mean2) {
-            return mean2;
-          },
-          median: function median(mean2) {
-            return mean2;
-          },
-          mode: function(mean2) {
-            return mean2;
-          },
-          sample: function sample(mean2, std) {
-            return jStat4.randn() * std + mean2;
-          },
-          variance: function(mean2, std) {
-            return std * std;
-          }
-        });
-        jStat4.extend(jStat4.pareto, {
-          pdf: function pdf(x2, scale, shape) {
-            if (x2 < scale)
-              return 0;
-            return shape * Math2.pow(scale, shape) / Math2.pow(x2, shape + 1);
-          },
-          cdf: function cdf(x2, scale, shape) {
-            if (x2 < scale)
-              return 0;
-            return 1 - Math2.pow(scale / x2, shape);
-          },
-          inv: function inv(p, scale, shape) {
-            return scale / Math2.pow(1 - p, 1 / shape);
-          },
-          mean: function mean2(scale, shape) {
-            if (shape <= 1)
-              return void 0;
-            return shape * Math2.pow(scale, shape) / (shape - 1);
-          },
-          median: function median(scale, shape) {
-            return scale * (shape * Math2.SQRT2);
-          },
-          mode: function mode(scale) {
-            return scale;
-          },
-          variance: function(scale, shape) {
-            if (shape <= 2)
-              return void 0;
-            return scale * scale * shape / (Math2.pow(shape - 1, 2) * (shape - 2));
-          }
-        });
-        jStat4.extend(jStat4.studentt, {
-          pdf: function pdf(x2, dof) {
-            dof = dof > 1e100 ? 1e100 : dof;
-            return 1 / (Math2.sqrt(dof) * jStat4.betafn(0.5, dof / 2)) * Math2.pow(1 + x2 * x2 / dof, -((dof + 1) / 2));
-          },
-          cdf: function cdf(x2, dof) {
-            var dof2 = dof / 2;
-            return jStat4.ibeta((x2 + Math2.sqrt(x2 * x2 + dof)) / (2 * Math2.sqrt(x2 * x2 + dof)), dof2, dof2);
-          },
-          inv: function(p, dof) {
-            var x2 = jStat4.ibetainv(2 * Math2.min(p, 1 - p), 0.5 * dof, 0.5);
-            x2 = Math2.sqrt(dof * (1 - x2) / x2);
-            return p > 0.5 ? x2 : -x2;
-          },
-          mean: function mean2(dof) {
-            return dof > 1 ? 0 : void 0;
-          },
-          median: function median() {
-            return 0;
-          },
-          mode: function mode() {
-            return 0;
-          },
-          sample: function sample(dof) {
-            return jStat4.randn() * Math2.sqrt(dof / (2 * jStat4.randg(dof / 2)));
-          },
-          variance: function variance(dof) {
-            return dof > 2 ? dof / (dof - 2) : dof > 1 ? Infinity : void 0;
-          }
-        });
-        jStat4.extend(jStat4.weibull, {
-          pdf: function pdf(x2, scale, shape) {
-            if (x2 < 0 || scale < 0 || shape < 0)
-              return 0;
-            return shape / scale * Math2.pow(x2 / scale, shape - 1) * Math2.exp(-Math2.pow(x2 / scale, shape));
-          },
-          cdf: function cdf(x2, scale, shape) {
-            return x2 < 0 ? 0 : 1 - Math2.exp(-Math2.pow(x2 / scale, shape));
-          },
-          inv: function(p, scale, shape) {
-            return scale * Math2.pow(-Math2.log(1 - p), 1 / shape);
-          },
-          mean: function(scale, shape) {
-            return scale * jStat4.gammafn(1 + 1 / shape);
-          },
-          median: function median(scale, shape) {
-            return scale * Math2.pow(Math2.log(2), 1 / shape);
-          },
-          mode: function mode(scale, shape) {
-            if (shape <= 1)
-              return 0;
-            return scale * Math2.pow((shape - 1) / shape, 1 / shape);
-          },
-          sample: function sample(scale, shape) {
-            return scale * Math2.pow(-Math2.log(jStat4._random_fn()), 1 / shape);
-          },
-          variance: function variance(scale, shape) {
-            return scale * scale * jStat4.gammafn(1 + 2 / shape) - Math2.pow(jStat4.weibull.mean(scale, shape), 2);
-          }
-        });
-        jStat4.extend(jStat4.uniform, {
-          pdf: function pdf(x2, a, b) {
-            return x2 < a || x2 > b ? 0 : 1 / (b - a);
-          },
-          cdf: function cdf(x2, a, b) {
-            if (x2 < a)
-              return 0;
-            else if (x2 < b)
-              return (x2 - a) / (b - a);
-            return 1;
-          },
-          inv: function(p, a, b) {
-            return a + p * (b - a);
-          },
-          mean: function mean2(a, b) {
-            return 0.5 * (a + b);
-          },
-          median: function median(a, b) {
-            return jStat4.mean(a, b);
-          },
-          mode: function mode() {
-            throw new Error("mode is not yet implemented");
-          },
-          sample: function sample(a, b) {
-            return a / 2 + b / 2 + (b / 2 - a / 2) * (2 * jStat4._random_fn() - 1);
-          },
-          variance: function variance(a, b) {
-            return Math2.pow(b - a, 2) / 12;
-          }
-        });
-        function betinc(x2, a, b, eps) {
-          var a0 = 0;
-          var b0 = 1;
-          var a1 = 1;
-          var b1 = 1;
-          var m9 = 0;
-          var a2 = 0;
-          var c9;
-          while (Math2.abs((a1 - a2) / a1) > eps) {
-            a2 = a1;
-            c9 = -(a + m9) * (a + b + m9) * x2 / (a + 2 * m9) / (a + 2 * m9 + 1);
-            a0 = a1 + c9 * a0;
-            b0 = b1 + c9 * b0;
-            m9 = m9 + 1;
-            c9 = m9 * (b - m9) * x2 / (a + 2 * m9 - 1) / (a + 2 * m9);
-            a1 = a0 + c9 * a1;
-            b1 = b0 + c9 * b1;
-            a0 = a0 / b1;
-            b0 = b0 / b1;
-            a1 = a1 / b1;
-            b1 = 1;
-          }
-          return a1 / a;
-        }
-        jStat4.extend(jStat4.binomial, {
-          pdf: function pdf(k, n, p) {
-            return p === 0 || p === 1 ? n * p === k ? 1 : 0 : jStat4.combination(n, k) * Math2.pow(p, k) * Math2.pow(1 - p, n - k);
-          },
-          cdf: function cdf(x2, n, p) {
-            var betacdf;
-            var eps = 1e-10;
-            if (x2 < 0)
-              return 0;
-            if (x2 >= n)
-              return 1;
-            if (p < 0 || p > 1 || n <= 0)
-              return NaN;
-            x2 = Math2.floor(x2);
-            var z = p;
-            var a = x2 + 1;
-            var b = n - x2;
-            var s = a + b;
-            var bt = Math2.exp(jStat4.gammaln(s) - jStat4.gammaln(b) - jStat4.gammaln(a) + a * Math2.log(z) + b * Math2.log(1 - z));
-            if (z < (a + 1) / (s + 2))
-              betacdf = bt * betinc(z, a, b, eps);
-            else
-              betacdf = 1 - bt * betinc(1 - z, b, a, eps);
-            return Math2.round((1 - betacdf) * (1 / eps)) / (1 / eps);
-          }
-        });
-        jStat4.extend(jStat4.negbin, {
-          pdf: function pdf(k, r, p) {
-            if (k !== k >>> 0)
-              return false;
-            if (k < 0)
-              return 0;
-            return jStat4.combination(k + r - 1, r - 1) * Math2.pow(1 - p, k) * Math2.pow(p, r);
-          },
-          cdf: function cdf(x2, r, p) {
-            var sum = 0, k = 0;
-            if (x2 < 0) return 0;
-            for (; k <= x2; k++) {
-              sum += jStat4.negbin.pdf(k, r, p);
-            }
-            return sum;
-          }
-        });
-        jStat4.extend(jStat4.hypgeom, {
-          pdf: function pdf(k, N, m, n) {
-            if (k !== k | 0) {
-              return false;
-            } else if (k < 0 || k < m - (N - n)) {
-              return 0;
-            } else if (k > n || k > m) {
-              return 0;
-            } else if (m * 2 > N) {
-              if (n * 2 > N) {
-                return jStat4.hypgeom.pdf(N - m - n + k, N, N - m, N - n);
-              } else {
-                return jStat4.hypgeom.pdf(n - k, N, N - m, n);
-              }
-            } else if (n * 2 > N) {
-              return jStat4.hypgeom.pdf(m - k, N, m, N - n);
-            } else if (m < n) {
-              return jStat4.hypgeom.pdf(k, N, n, m);
-            } else {
-              var scaledPDF = 1;
-              var samplesDone = 0;
-              for (var i2 = 0; i2 < k; i2++) {
-                while (scaledPDF > 1 && samplesDone < n) {
-                  scaledPDF *= 1 - m / (N - samplesDone);
-                  samplesDone++;
-                }
-                scaledPDF *= (n - i2) * (m - i2) / ((i2 + 1) * (N - m - n + i2 + 1));
-              }
-              for (; samplesDone < n; samplesDone++) {
-                scaledPDF *= 1 - m / (N - samplesDone);
-              }
-              return Math2.min(1, Math2.max(0, scaledPDF));
-            }
-          },
-          cdf: function cdf(x2, N, m, n) {
-            if (x2 < 0 || x2 < m - (N - n)) {
-              return 0;
-            } else if (x2 >= n || x2 >= m) {
-              return 1;
-            } else if (m * 2 > N) {
-              if (n * 2 > N) {
-                return jStat4.hypgeom.cdf(N - m - n + x2, N, N - m, N - n);
-              } else {
-                return 1 - jStat4.hypgeom.cdf(n - x2 - 1, N, N - m, n);
-              }
-            } else if (n * 2 > N) {
-              return 1 - jStat4.hypgeom.cdf(m - x2 - 1, N, m, N - n);
-            } else if (m < n) {
-              return jStat4.hypgeom.cdf(x2, N, n, m);
-            } else {
-              var scaledCDF = 1;
-              var scaledPDF = 1;
-              var samplesDone = 0;
-              for (var i2 = 0; i2 < x2; i2++) {
-                while (scaledCDF > 1 && samplesDone < n) {
-                  var factor = 1 - m / (N - samplesDone);
-                  scaledPDF *= factor;
-                  scaledCDF *= factor;
-                  samplesDone++;
-                }
-                scaledPDF *= (n - i2) * (m - i2) / ((i2 + 1) * (N - m - n + i2 + 1));
-                scaledCDF += scaledPDF;
-              }
-              for (; samplesDone < n; samplesDone++) {
-                scaledCDF *= 1 - m / (N - samplesDone);
-              }
-              return Math2.min(1, Math2.max(0, scaledCDF));
-            }
-          }
-        });
-        jStat4.extend(jStat4.poisson, {
-          pdf: function pdf(k, l) {
-            if (l < 0 || k % 1 !== 0 || k < 0) {
-              return 0;
-            }
-            return Math2.pow(l, k) * Math2.exp(-l) / jStat4.factorial(k);
-          },
-          cdf: function cdf(x2, l) {
-            var sumarr = [], k = 0;
-            if (x2 < 0) return 0;
-            for (; k <= x2; k++) {
-              sumarr.push(jStat4.poisson.pdf(k, l));
-            }
-            return jStat4.sum(sumarr);
-          },
-          mean: function(l) {
-            return l;
-          },
-          variance: function(l) {
-            return l;
-          },
-          sampleSmall: function sampleSmall(l) {
-            var p = 1, k = 0, L = Math2.exp(-l);
-            do {
-              k++;
-              p *= jStat4._random_fn();
-            } while (p > L);
-            return k - 1;
-          },
-          sampleLarge: function sampleLarge(l) {
-            var lam = l;
-            var k;
-            var U, V, slam, loglam, a, b, invalpha, vr, us;
-            slam = Math2.sqrt(lam);
-            loglam = Math2.log(lam);
-            b = 0.931 + 2.53 * slam;
-            a = -0.059 + 0.02483 * b;
-            invalpha = 1.1239 + 1.1328 / (b - 3.4);
-            vr = 0.9277 - 3.6224 / (b - 2);
-            while (1) {
-              U = Math2.random() - 0.5;
-              V = Math2.random();
-              us = 0.5 - Math2.abs(U);
-              k = Math2.floor((2 * a / us + b) * U + lam + 0.43);
-              if (us >= 0.07 && V <= vr) {
-                return k;
-              }
-              if (k < 0 || us < 0.013 && V > us) {
-                continue;
-              }
-              if (Math2.log(V) + Math2.log(invalpha) - Math2.log(a / (us * us) + b) <= -lam + k * loglam - jStat4.loggam(k + 1)) {
-                return k;
-              }
-            }
-          },
-          sample: function sample(l) {
-            if (l < 10)
-              return this.sampleSmall(l);
-            else
-              return this.sampleLarge(l);
-          }
-        });
-        jStat4.extend(jStat4.triangular, {
-          pdf: function pdf(x2, a, b, c) {
-            if (b <= a || c < a || c > b) {
-              return NaN;
-            } else {
-              if (x2 < a || x2 > b) {
-                return 0;
-              } else if (x2 < c) {
-                return 2 * (x2 - a) / ((b - a) * (c - a));
-              } else if (x2 === c) {
-                return 2 / (b - a);
-              } else {
-                return 2 * (b - x2) / ((b - a) * (b - c));
-              }
-            }
-          },
-          cdf: function cdf(x2, a, b, c) {
-            if (b <= a || c < a || c > b)
-              return NaN;
-            if (x2 <= a)
-              return 0;
-            else if (x2 >= b)
-              return 1;
-            if (x2 <= c)
-              return Math2.pow(x2 - a, 2) / ((b - a) * (c - a));
-            else
-              return 1 - Math2.pow(b - x2, 2) / ((b - a) * (b - c));
-          },
-          inv: function inv(p, a, b, c) {
-            if (b <= a || c < a || c > b) {
-              return NaN;
-            } else {
-              if (p <= (c - a) / (b - a)) {
-                return a + (b - a) * Math2.sqrt(p * ((c - a) / (b - a)));
-              } else {
-                return a + (b - a) * (1 - Math2.sqrt((1 - p) * (1 - (c - a) / (b - a))));
-              }
-            }
-          },
-          mean: function mean2(a, b, c) {
-            return (a + b + c) / 3;
-          },
-          median: function median(a, b, c) {
-            if (c <= (a + b) / 2) {
-              return b - Math2.sqrt((b - a) * (b - c)) / Math2.sqrt(2);
-            } else if (c > (a + b) / 2) {
-              return a + Math2.sqrt((b - a) * (c - a)) / Math2.sqrt(2);
-            }
-          },
-          mode: function mode(a, b, c) {
-            return c;
-          },
-          sample: function sample(a, b, c) {
-            var u = jStat4._random_fn();
-            if (u < (c - a) / (b - a))
-              return a + Math2.sqrt(u * (b - a) * (c - a));
-            return b - Math2.sqrt((1 - u) * (b - a) * (b - c));
-          },
-          variance: function variance(a, b, c) {
-            return (a * a + b * b + c * c - a * b - a * c - b * c) / 18;
-          }
-        });
-        jStat4.extend(jStat4.arcsine, {
-          pdf: function pdf(x2, a, b) {
-            if (b <= a) return NaN;
-            return x2 <= a || x2 >= b ? 0 : 2 / Math2.PI * Math2.pow(Math2.pow(b - a, 2) - Math2.pow(2 * x2 - a - b, 2), -0.5);
-          },
-          cdf: function cdf(x2, a, b) {
-            if (x2 < a)
-              return 0;
-            else if (x2 < b)
-              return 2 / Math2.PI * Math2.asin(Math2.sqrt((x2 - a) / (b - a)));
-            return 1;
-          },
-          inv: function(p, a, b) {
-            return a + (0.5 - 0.5 * Math2.cos(Math2.PI * p)) * (b - a);
-          },
-          mean: function mean2(a, b) {
-            if (b <= a) return NaN;
-            return (a + b) / 2;
-          },
-          median: function median(a, b) {
-            if (b <= a) return NaN;
-            return (a + b) / 2;
-          },
-          mode: function mode() {
-            throw new Error("mode is not yet implemented");
-          },
-          sample: function sample(a, b) {
-            return (a + b) / 2 + (b - a) / 2 * Math2.sin(2 * Math2.PI * jStat4.uniform.sample(0, 1));
-          },
-          variance: function variance(a, b) {
-            if (b <= a) return NaN;
-            return Math2.pow(b - a, 2) / 8;
-          }
-        });
-        function laplaceSign(x2) {
-          return x2 / Math2.abs(x2);
-        }
-        jStat4.extend(jStat4.laplace, {
-          pdf: function pdf(x2, mu, b) {
-            return b <= 0 ? 0 : Math2.exp(-Math2.abs(x2 - mu) / b) / (2 * b);
-          },
-          cdf: function cdf(x2, mu, b) {
-            if (b <= 0) {
-              return 0;
-            }
-            if (x2 < mu) {
-              return 0.5 * Math2.exp((x2 - mu) / b);
-            } else {
-              return 1 - 0.5 * Math2.exp(-(x2 - mu) / b);
-            }
-          },
-          mean: function(mu) {
-            return mu;
-          },
-          median: function(mu) {
-            return mu;
-          },
-          mode: function(mu) {
-            return mu;
-          },
-          variance: function(mu, b) {
-            return 2 * b * b;
-          },
-          sample: function sample(mu, b) {
-            var u = jStat4._random_fn() - 0.5;
-            return mu - b * laplaceSign(u) * Math2.log(1 - 2 * Math2.abs(u));
-          }
-        });
-        function tukeyWprob(w, rr, cc) {
-          var nleg = 12;
-          var ihalf = 6;
-          var C1 = -30;
-          var C2 = -50;
-          var C3 = 60;
-          var bb = 8;
-          var wlar = 3;
-          var wincr1 = 2;
-          var wincr2 = 3;
-          var xleg = [
-            0.9815606342467192,
-            0.9041172563704749,
-            0.7699026741943047,
-            0.5873179542866175,
-            0.3678314989981802,
-            0.1252334085114689
-          ];
-          var aleg = [
-            0.04717533638651183,
-            0.10693932599531843,
-            0.16007832854334622,
-            0.20316742672306592,
-            0.2334925365383548,
-            0.24914704581340277
-          ];
-          var qsqz = w * 0.5;
-          if (qsqz >= bb)
-            return 1;
-          var pr_w = 2 * jStat4.normal.cdf(qsqz, 0, 1, 1, 0) - 1;
-          if (pr_w >= Math2.exp(C2 / cc))
-            pr_w = Math2.pow(pr_w, cc);
-          else
-            pr_w = 0;
-          var wincr;
-          if (w > wlar)
-            wincr = wincr1;
-          else
-            wincr = wincr2;
-          var blb = qsqz;
-          var binc = (bb - qsqz) / wincr;
-          var bub = blb + binc;
-          var einsum = 0;
-          var cc1 = cc - 1;
-          for (var wi = 1; wi <= wincr; wi++) {
-            var elsum = 0;
-            var a = 0.5 * (bub + blb);
-            var b = 0.5 * (bub - blb);
-            for (var jj = 1; jj <= nleg; jj++) {
-              var j, xx;
-              if (ihalf < jj) {
-                j = nleg - jj + 1;
-                xx = xleg[j - 1];
-              } else {
-                j = jj;
-                xx = -xleg[j - 1];
-              }
-              var c = b * xx;
-              var ac = a + c;
-              var qexpo = ac * ac;
-              if (qexpo > C3)
-                break;
-              var pplus = 2 * jStat4.normal.cdf(ac, 0, 1, 1, 0);
-              var pminus = 2 * jStat4.normal.cdf(ac, w, 1, 1, 0);
-              var rinsum = pplus * 0.5 - pminus * 0.5;
-              if (rinsum >= Math2.exp(C1 / cc1)) {
-                rinsum = aleg[j - 1] * Math2.exp(-(0.5 * qexpo)) * Math2.pow(rinsum, cc1);
-                elsum += rinsum;
-              }
-            }
-            elsum *= 2 * b * cc / Math2.sqrt(2 * Math2.PI);
-            einsum += elsum;
-            blb = bub;
-            bub += binc;
-          }
-          pr_w += einsum;
-          if (pr_w <= Math2.exp(C1 / rr))
-            return 0;
-          pr_w = Math2.pow(pr_w, rr);
-          if (pr_w >= 1)
-            return 1;
-          return pr_w;
-        }
-        function tukeyQinv(p, c, v) {
-          var p0 = 0.322232421088;
-          var q0 = 0.099348462606;
-          var p1 = -1;
-          var q1 = 0.588581570495;
-          var p2 = -0.342242088547;
-          var q2 = 0.531103462366;
-          var p3 = -0.204231210125;
-          var q3 = 0.10353775285;
-          var p4 = -453642210148e-16;
-          var q4 = 0.0038560700634;
-          var c1 = 0.8832;
-          var c2 = 0.2368;
-          var c3 = 1.214;
-          var c4 = 1.208;
-          var c5 = 1.4142;
-          var vmax = 120;
-          var ps = 0.5 - 0.5 * p;
-          var yi = Math2.sqrt(Math2.log(1 / (ps * ps)));
-          var t = yi + ((((yi * p4 + p3) * yi + p2) * yi + p1) * yi + p0) / ((((yi * q4 + q3) * yi + q2) * yi + q1) * yi + q0);
-          if (v < vmax) t += (t * t * t + t) / v / 4;
-          var q = c1 - c2 * t;
-          if (v < vmax) q += -c3 / v + c4 * t / v;
-          return t * (q * Math2.log(c - 1) + c5);
-        }
-        jStat4.extend(jStat4.tukey, {
-          cdf: function cdf(q, nmeans, df) {
-            var rr = 1;
-            var cc = nmeans;
-            var nlegq = 16;
-            var ihalfq = 8;
-            var eps1 = -30;
-            var eps2 = 1e-14;
-            var dhaf = 100;
-            var dquar = 800;
-            var deigh = 5e3;
-            var dlarg = 25e3;
-            var ulen1 = 1;
-            var ulen2 = 0.5;
-            var ulen3 = 0.25;
-            var ulen4 = 0.125;
-            var xlegq = [
-              0.9894009349916499,
-              0.9445750230732326,
-              0.8656312023878318,
-              0.755404408355003,
-              0.6178762444026438,
-              0.45801677765722737,
-              0.2816035507792589,
-              0.09501250983763744
-            ];
-            var alegq = [
-              0.027152459411754096,
-              0.062253523938647894,
-              0.09515851168249279,
-              0.12462897125553388,
-              0.14959598881657674,
-              0.16915651939500254,
-              0.18260341504492358,
-              0.1894506104550685
-            ];
-            if (q <= 0)
-              return 0;
-            if (df < 2 || rr < 1 || cc < 2) return NaN;
-            if (!Number.isFinite(q))
-              return 1;
-            if (df > dlarg)
-              return tukeyWprob(q, rr, cc);
-            var f2 = df * 0.5;
-            var f2lf = f2 * Math2.log(df) - df * Math2.log(2) - jStat4.gammaln(f2);
-            var f21 = f2 - 1;
-            var ff4 = df * 0.25;
-            var ulen;
-            if (df <= dhaf) ulen = ulen1;
-            else if (df <= dquar) ulen = ulen2;
-            else if (df <= deigh) ulen = ulen3;
-            else ulen = ulen4;
-            f2lf += Math2.log(ulen);
-            var ans = 0;
-            for (var i2 = 1; i2 <= 50; i2++) {
-              var otsum = 0;
-              var twa1 = (2 * i2 - 1) * ulen;
-              for (var jj = 1; jj <= nlegq; jj++) {
-                var j, t1;
-                if (ihalfq < jj) {
-                  j = jj - ihalfq - 1;
-                  t1 = f2lf + f21 * Math2.log(twa1 + xlegq[j] * ulen) - (xlegq[j] * ulen + twa1) * ff4;
-                } else {
-                  j = jj - 1;
-                  t1 = f2lf + f21 * Math2.log(twa1 - xlegq[j] * ulen) + (xlegq[j] * ulen - twa1) * ff4;
-                }
-                var qsqz;
-                if (t1 >= eps1) {
-                  if (ihalfq < jj) {
-                    qsqz = q * Math2.sqrt((xlegq[j] * ulen + twa1) * 0.5);
-                  } else {
-                    qsqz = q * Math2.sqrt((-(xlegq[j] * ulen) + twa1) * 0.5);
-                  }
-                  var wprb = tukeyWprob(qsqz, rr, cc);
-                  var rotsum = wprb * alegq[j] * Math2.exp(t1);
-                  otsum += rotsum;
-                }
-              }
-              if (i2 * ulen >= 1 && otsum <= eps2)
-                break;
-              ans += otsum;
-            }
-            if (otsum > eps2) {
-              throw new Error("tukey.cdf failed to converge");
-            }
-            if (ans > 1)
-              ans = 1;
-            return ans;
-          },
-          inv: function(p, nmeans, df) {
-            var rr = 1;
-            var cc = nmeans;
-            var eps = 1e-4;
-            var maxiter = 50;
-            if (df < 2 || rr < 1 || cc < 2) return NaN;
-            if (p < 0 || p > 1) return NaN;
-            if (p === 0) return 0;
-            if (p === 1) return Infinity;
-            var x0 = tukeyQinv(p, cc, df);
-            var valx0 = jStat4.tukey.cdf(x0, nmeans, df) - p;
-            var x1;
-            if (valx0 > 0)
-              x1 = Math2.max(0, x0 - 1);
-            else
-              x1 = x0 + 1;
-            var valx1 = jStat4.tukey.cdf(x1, nmeans, df) - p;
-            var ans;
-            for (var iter = 1; iter < maxiter; iter++) {
-              ans = x1 - valx1 * (x1 - x0) / (valx1 - valx0);
-              valx0 = valx1;
-              x0 = x1;
-              if (ans < 0) {
-                ans = 0;
-                valx1 = -p;
-              }
-              valx1 = jStat4.tukey.cdf(ans, nmeans, df) - p;
-              x1 = ans;
-              var xabs = Math2.abs(x1 - x0);
-              if (xabs < eps)
-                return ans;
-            }
-            throw new Error("tukey.inv failed to converge");
-          }
-        });
-      })(jStat3, Math);
-      (function(jStat4, Math2) {
-        var push = Array.prototype.push;
-        var isArray = jStat4.utils.isArray;
-        function isUsable(arg) {
-          return isArray(arg) || arg instanceof jStat4;
-        }
-        jStat4.extend({
-          // add a vector/matrix to a vector/matrix or scalar
-          add: function add(arr, arg) {
-            if (isUsable(arg)) {
-              if (!isUsable(arg[0])) arg = [arg];
-              return jStat4.map(arr, function(value, row, col) {
-                return value + arg[row][col];
-              });
-            }
-            return jStat4.map(arr, function(value) {
-              return value + arg;
-            });
-          },
-          // subtract a vector or scalar from the vector
-          subtract: function subtract(arr, arg) {
-            if (isUsable(arg)) {
-              if (!isUsable(arg[0])) arg = [arg];
-              return jStat4.map(arr, function(value, row, col) {
-                return value - arg[row][col] || 0;
-              });
-            }
-            return jStat4.map(arr, function(value) {
-              return value - arg;
-            });
-          },
-          // matrix division
-          divide: function divide(arr, arg) {
-            if (isUsable(arg)) {
-              if (!isUsable(arg[0])) arg = [arg];
-              return jStat4.multiply(arr, jStat4.inv(arg));
-            }
-            return jStat4.map(arr, function(value) {
-              return value / arg;
-            });
-          },
-          // matrix multiplication
-          multiply: function multiply(arr, arg) {
-            var row, col, nrescols, sum, nrow, ncol, res, rescols;
-            if (arr.length === void 0 && arg.length === void 0) {
-              return arr * arg;
-            }
-            nrow = arr.length, ncol = arr[0].length, res = jStat4.zeros(nrow, nrescols = isUsable(arg) ? arg[0].length : ncol), rescols = 0;
-            if (isUsable(arg)) {
-              for (; rescols < nrescols; rescols++) {
-                for (row = 0; row < nrow; row++) {
-                  sum = 0;
-                  for (col = 0; col < ncol; col++)
-                    sum += arr[row][col] * arg[col][rescols];
-                  res[row][rescols] = sum;
-                }
-              }
-              return nrow === 1 && rescols === 1 ? res[0][0] : res;
-            }
-            return jStat4.map(arr, function(value) {
-              return value * arg;
-            });
-          },
-          // outer([1,2,3],[4,5,6])
-          // ===
-          // [[1],[2],[3]] times [[4,5,6]]
-          // ->
-          // [[4,5,6],[8,10,12],[12,15,18]]
-          outer: function outer(A, B) {
-            return jStat4.multiply(A.map(function(t) {
-              return [t];
-            }), [B]);
-          },
-          // Returns the dot product of two matricies
-          dot: function dot(arr, arg) {
-            if (!isUsable(arr[0])) arr = [arr];
-            if (!isUsable(arg[0])) arg = [arg];
-            var left = arr[0].length === 1 && arr.length !== 1 ? jStat4.transpose(arr) : arr, right = arg[0].length === 1 && arg.length !== 1 ? jStat4.transpose(arg) : arg, res = [], row = 0, nrow = left.length, ncol = left[0].length, sum, col;
-            for (; row < nrow; row++) {
-              res[row] = [];
-              sum = 0;
-              for (col = 0; col < ncol; col++)
-                sum += left[row][col] * right[row][col];
-              res[row] = sum;
-            }
-            return res.length === 1 ? res[0] : res;
-          },
-          // raise every element by a scalar
-          pow: function pow(arr, arg) {
-            return jStat4.map(arr, function(value) {
-              return Math2.pow(value, arg);
-            });
-          },
-          // exponentiate every element
-          exp: function exp(arr) {
-            return jStat4.map(arr, function(value) {
-              return Math2.exp(value);
-            });
-          },
-          // generate the natural log of every element
-          log: function exp(arr) {
-            return jStat4.map(arr, function(value) {
-              return Math2.log(value);
-            });
-          },
-          // generate the absolute values of the vector
-          abs: function abs(arr) {
-            return jStat4.map(arr, function(value) {
-              return Math2.abs(value);
-            });
-          },
-          // computes the p-norm of the vector
-          // In the case that a matrix is passed, uses the first row as the vector
-          norm: function norm(arr, p) {
-            var nnorm = 0, i2 = 0;
-            if (isNaN(p)) p = 2;
-            if (isUsable(arr[0])) arr = arr[0];
-            for (; i2 < arr.length; i2++) {
-              nnorm += Math2.pow(Math2.abs(arr[i2]), p);
-            }
-            return Math2.pow(nnorm, 1 / p);
-          },
-          // computes the angle between two vectors in rads
-          // In case a matrix is passed, this uses the first row as the vector
-          angle: function angle(arr, arg) {
-            return Math2.acos(jStat4.dot(arr, arg) / (jStat4.norm(arr) * jStat4.norm(arg)));
-          },
-          // augment one matrix by another
-          // Note: this function returns a matrix, not a jStat object
-          aug: function aug(a, b) {
-            var newarr = [];
-            var i2;
-            for (i2 = 0; i2 < a.length; i2++) {
-              newarr.push(a[i2].slice());
-            }
-            for (i2 = 0; i2 < newarr.length; i2++) {
-              push.apply(newarr[i2], b[i2]);
-            }
-            return newarr;
-          },
-          // The inv() function calculates the inverse of a matrix
-          // Create the inverse by augmenting the matrix by the identity matrix of the
-          // appropriate size, and then use G-J elimination on the augmented matrix.
-          inv: function inv(a) {
-            var rows = a.length;
-            var cols = a[0].length;
-            var b = jStat4.identity(rows, cols);
-            var c = jStat4.gauss_jordan(a, b);
-            var result = [];
-            var i2 = 0;
-            var j;
-            for (; i2 < rows; i2++) {
-              result[i2] = [];
-              for (j = cols; j < c[0].length; j++)
-                result[i2][j - cols] = c[i2][j];
-            }
-            return result;
-          },
-          // calculate the determinant of a matrix
-          det: function det(a) {
-            if (a.length === 2) {
-              return a[0][0] * a[1][1] - a[0][1] * a[1][0];
-            }
-            var determinant = 0;
-            for (var i2 = 0; i2 < a.length; i2++) {
-              var submatrix = [];
-              for (var row = 1; row < a.length; row++) {
-                submatrix[row - 1] = [];
-                for (var col = 0; col < a.length; col++) {
-                  if (col < i2) {
-                    submatrix[row - 1][col] = a[row][col];
-                  } else if (col > i2) {
-                    submatrix[row - 1][col - 1] = a[row][col];
-                  }
-                }
-              }
-              var sign = i2 % 2 ? -1 : 1;
-              determinant += det(submatrix) * a[0][i2] * sign;
-            }
-            return determinant;
-          },
-          gauss_elimination: function gauss_elimination(a, b) {
-            var i2 = 0, j = 0, n = a.length, m = a[0].length, factor = 1, sum = 0, x2 = [], maug, pivot, temp, k;
-            a = jStat4.aug(a, b);
-            maug = a[0].length;
-            for (i2 = 0; i2 < n; i2++) {
-              pivot = a[i2][i2];
-              j = i2;
-              for (k = i2 + 1; k < m; k++) {
-                if (pivot < Math2.abs(a[k][i2])) {
-                  pivot = a[k][i2];
-                  j = k;
-                }
-              }
-              if (j != i2) {
-                for (k = 0; k < maug; k++) {
-                  temp = a[i2][k];
-                  a[i2][k] = a[j][k];
-                  a[j][k] = temp;
-                }
-              }
-              for (j = i2 + 1; j < n; j++) {
-                factor = a[j][i2] / a[i2][i2];
-                for (k = i2; k < maug; k++) {
-                  a[j][k] = a[j][k] - factor * a[i2][k];
-                }
-              }
-            }
-            for (i2 = n - 1; i2 >= 0; i2--) {
-              sum = 0;
-              for (j = i2 + 1; j <= n - 1; j++) {
-                sum = sum + x2[j] * a[i2][j];
-              }
-              x2[i2] = (a[i2][maug - 1] - sum) / a[i2][i2];
-            }
-            return x2;
-          },
-          gauss_jordan: function gauss_jordan(a, b) {
-            var m = jStat4.aug(a, b);
-            var h = m.length;
-            var w = m[0].length;
-            var c = 0;
-            var x2, y, y2;
-            for (y = 0; y < h; y++) {
-              var maxrow = y;
-              for (y2 = y + 1; y2 < h; y2++) {
-                if (Math2.abs(m[y2][y]) > Math2.abs(m[maxrow][y]))
-                  maxrow = y2;
-              }
-              var tmp = m[y];
-              m[y] = m[maxrow];
-              m[maxrow] = tmp;
-              for (y2 = y + 1; y2 < h; y2++) {
-                c = m[y2][y] / m[y][y];
-                for (x2 = y; x2 < w; x2++) {
-                  m[y2][x2] -= m[y][x2] * c;
-                }
-              }
-            }
-            for (y = h - 1; y >= 0; y--) {
-              c = m[y][y];
-              for (y2 = 0; y2 < y; y2++) {
-                for (x2 = w - 1; x2 > y - 1; x2--) {
-                  m[y2][x2] -= m[y][x2] * m[y2][y] / c;
-                }
-              }
-              m[y][y] /= c;
-              for (x2 = h; x2 < w; x2++) {
-                m[y][x2] /= c;
-              }
-            }
-            return m;
-          },
-          // solve equation
-          // Ax=b
-          // A is upper triangular matrix
-          // A=[[1,2,3],[0,4,5],[0,6,7]]
-          // b=[1,2,3]
-          // triaUpSolve(A,b) // -> [2.666,0.1666,1.666]
-          // if you use matrix style
-          // A=[[1,2,3],[0,4,5],[0,6,7]]
-          // b=[[1],[2],[3]]
-          // will return [[2.666],[0.1666],[1.666]]
-          triaUpSolve: function triaUpSolve(A, b) {
-            var size = A[0].length;
-            var x2 = jStat4.zeros(1, size)[0];
-            var parts;
-            var matrix_mode = false;
-            if (b[0].length != void 0) {
-              b = b.map(function(i2) {
-                return i2[0];
-              });
-              matrix_mode = true;
-            }
-            jStat4.arange(size - 1, -1, -1).forEach(function(i2) {
-              parts = jStat4.arange(i2 + 1, size).map(function(j) {
-                return x2[j] * A[i2][j];
-              });
-              x2[i2] = (b[i2] - jStat4.sum(parts)) / A[i2][i2];
-            });
-            if (matrix_mode)
-              return x2.map(function(i2) {
-                return [i2];
-              });
-            return x2;
-          },
-          triaLowSolve: function triaLowSolve(A, b) {
-            var size = A[0].length;
-            var x2 = jStat4.zeros(1, size)[0];
-            var parts;
-            var matrix_mode = false;
-            if (b[0].length != void 0) {
-              b = b.map(function(i2) {
-                return i2[0];
-              });
-              matrix_mode = true;
-            }
-            jStat4.arange(size).forEach(function(i2) {
-              parts = jStat4.arange(i2).map(function(j) {
-                return A[i2][j] * x2[j];
-              });
-              x2[i2] = (b[i2] - jStat4.sum(parts)) / A[i2][i2];
-            });
-            if (matrix_mode)
-              return x2.map(function(i2) {
-                return [i2];
-              });
-            return x2;
-          },
-          // A -> [L,U]
-          // A=LU
-          // L is lower triangular matrix
-          // U is upper triangular matrix
-          lu: function lu(A) {
-            var size = A.length;
-            var L = jStat4.identity(size);
-            var R = jStat4.zeros(A.length, A[0].length);
-            var parts;
-            jStat4.arange(size).forEach(function(t) {
-              R[0][t] = A[0][t];
-            });
-            jStat4.arange(1, size).forEach(function(l) {
-              jStat4.arange(l).forEach(function(i2) {
-                parts = jStat4.arange(i2).map(function(jj) {
-                  return L[l][jj] * R[jj][i2];
-                });
-                L[l][i2] = (A[l][i2] - jStat4.sum(parts)) / R[i2][i2];
-              });
-              jStat4.arange(l, size).forEach(function(j) {
-                parts = jStat4.arange(l).map(function(jj) {
-                  return L[l][jj] * R[jj][j];
-                });
-                R[l][j] = A[parts.length][j] - jStat4.sum(parts);
-              });
-            });
-            return [L, R];
-          },
-          // A -> T
-          // A=TT'
-          // T is lower triangular matrix
-          cholesky: function cholesky(A) {
-            var size = A.length;
-            var T = jStat4.zeros(A.length, A[0].length);
-            var parts;
-            jStat4.arange(size).forEach(function(i2) {
-              parts = jStat4.arange(i2).map(function(t) {
-                return Math2.pow(T[i2][t], 2);
-              });
-              T[i2][i2] = Math2.sqrt(A[i2][i2] - jStat4.sum(parts));
-              jStat4.arange(i2 + 1, size).forEach(function(j) {
-                parts = jStat4.arange(i2).map(function(t) {
-                  return T[i2][t] * T[j][t];
-                });
-                T[j][i2] = (A[i2][j] - jStat4.sum(parts)) / T[i2][i2];
-              });
-            });
-            return T;
-          },
-          gauss_jacobi: function gauss_jacobi(a, b, x2, r) {
-            var i2 = 0;
-            var j = 0;
-            var n = a.length;
-            var l = [];
-            var u = [];
-            var d = [];
-            var xv, c, h, xk;
-            for (; i2 < n; i2++) {
-              l[i2] = [];
-              u[i2] = [];
-              d[i2] = [];
-              for (j = 0; j < n; j++) {
-                if (i2 > j) {
-                  l[i2][j] = a[i2][j];
-                  u[i2][j] = d[i2][j] = 0;
-                } else if (i2 < j) {
-                  u[i2][j] = a[i2][j];
-                  l[i2][j] = d[i2][j] = 0;
-                } else {
-                  d[i2][j] = a[i2][j];
-                  l[i2][j] = u[i2][j] = 0;
-                }
-              }
-            }
-            h = jStat4.multiply(jStat4.multiply(jStat4.inv(d), jStat4.add(l, u)), -1);
-            c = jStat4.multiply(jStat4.inv(d), b);
-            xv = x2;
-            xk = jStat4.add(jStat4.multiply(h, x2), c);
-            i2 = 2;
-            while (Math2.abs(jStat4.norm(jStat4.subtract(xk, xv))) > r) {
-              xv = xk;
-              xk = jStat4.add(jStat4.multiply(h, xv), c);
-              i2++;
-            }
-            return xk;
-          },
-          gauss_seidel: function gauss_seidel(a, b, x2, r) {
-            var i2 = 0;
-            var n = a.length;
-            var l = [];
-            var u = [];
-            var d = [];
-            var j, xv, c, h, xk;
-            for (; i2 < n; i2++) {
-              l[i2] = [];
-              u[i2] = [];
-              d[i2] = [];
-              for (j = 0; j < n; j++) {
-                if (i2 > j) {
-                  l[i2][j] = a[i2][j];
-                  u[i2][j] = d[i2][j] = 0;
-                } else if (i2 < j) {
-                  u[i2][j] = a[i2][j];
-                  l[i2][j] = d[i2][j] = 0;
-                } else {
-                  d[i2][j] = a[i2][j];
-                  l[i2][j] = u[i2][j] = 0;
-                }
-              }
-            }
-            h = jStat4.multiply(jStat4.multiply(jStat4.inv(jStat4.add(d, l)), u), -1);
-            c = jStat4.multiply(jStat4.inv(jStat4.add(d, l)), b);
-            xv = x2;
-            xk = jStat4.add(jStat4.multiply(h, x2), c);
-            i2 = 2;
-            while (Math2.abs(jStat4.norm(jStat4.subtract(xk, xv))) > r) {
-              xv = xk;
-              xk = jStat4.add(jStat4.multiply(h, xv), c);
-              i2 = i2 + 1;
-            }
-            return xk;
-          },
-          SOR: function SOR(a, b, x2, r, w) {
-            var i2 = 0;
-            var n = a.length;
-            var l = [];
-            var u = [];
-            var d = [];
-            var j, xv, c, h, xk;
-            for (; i2 < n; i2++) {
-              l[i2] = [];
-              u[i2] = [];
-              d[i2] = [];
-              for (j = 0; j < n; j++) {
-                if (i2 > j) {
-                  l[i2][j] = a[i2][j];
-                  u[i2][j] = d[i2][j] = 0;
-                } else if (i2 < j) {
-                  u[i2][j] = a[i2][j];
-                  l[i2][j] = d[i2][j] = 0;
-                } else {
-                  d[i2][j] = a[i2][j];
-                  l[i2][j] = u[i2][j] = 0;
-                }
-              }
-            }
-            h = jStat4.multiply(
-              jStat4.inv(jStat4.add(d, jStat4.multiply(l, w))),
-              jStat4.subtract(
-                jStat4.multiply(d, 1 - w),
-                jStat4.multiply(u, w)
-              )
-            );
-            c = jStat4.multiply(jStat4.multiply(jStat4.inv(jStat4.add(
-              d,
-              jStat4.multiply(l, w)
-            )), b), w);
-            xv = x2;
-            xk = jStat4.add(jStat4.multiply(h, x2), c);
-            i2 = 2;
-            while (Math2.abs(jStat4.norm(jStat4.subtract(xk, xv))) > r) {
-              xv = xk;
-              xk = jStat4.add(jStat4.multiply(h, xv), c);
-              i2++;
-            }
-            return xk;
-          },
-          householder: function householder(a) {
-            var m = a.length;
-            var n = a[0].length;
-            var i2 = 0;
-            var w = [];
-            var p = [];
-            var alpha, r, k, j, factor;
-            for (; i2 < m - 1; i2++) {
-              alpha = 0;
-              for (j = i2 + 1; j < n; j++)
-                alpha += a[j][i2] * a[j][i2];
-              factor = a[i2 + 1][i2] > 0 ? -1 : 1;
-              alpha = factor * Math2.sqrt(alpha);
-              r = Math2.sqrt((alpha * alpha - a[i2 + 1][i2] * alpha) / 2);
-              w = jStat4.zeros(m, 1);
-              w[i2 + 1][0] = (a[i2 + 1][i2] - alpha) / (2 * r);
-              for (k = i2 + 2; k < m; k++) w[k][0] = a[k][i2] / (2 * r);
-              p = jStat4.subtract(
-                jStat4.identity(m, n),
-                jStat4.multiply(jStat4.multiply(w, jStat4.transpose(w)), 2)
-              );
-              a = jStat4.multiply(p, jStat4.multiply(a, p));
-            }
-            return a;
-          },
-          // A -> [Q,R]
-          // Q is orthogonal matrix
-          // R is upper triangular
-          QR: (function() {
-            var sum = jStat4.sum;
-            var range = jStat4.arange;
-            function qr2(x2) {
-              var n = x2.length;
-              var p = x2[0].length;
-              var r = jStat4.zeros(p, p);
-              x2 = jStat4.copy(x2);
-              var i2, j, k;
-              for (j = 0; j < p; j++) {
-                r[j][j] = Math2.sqrt(sum(range(n).map(function(i3) {
-                  return x2[i3][j] * x2[i3][j];
-                })));
-                for (i2 = 0; i2 < n; i2++) {
-                  x2[i2][j] = x2[i2][j] / r[j][j];
-                }
-                for (k = j + 1; k < p; k++) {
-                  r[j][k] = sum(range(n).map(function(i3) {
-                    return x2[i3][j] * x2[i3][k];
-                  }));
-                  for (i2 = 0; i2 < n; i2++) {
-                    x2[i2][k] = x2[i2][k] - x2[i2][j] * r[j][k];
-                  }
-                }
-              }
-              return [x2, r];
-            }
-            return qr2;
-          })(),
-          lstsq: /* @__PURE__ */ (function() {
-            function R_I(A) {
-              A = jStat4.copy(A);
-              var size = A.length;
-              var I = jStat4.identity(size);
-              jStat4.arange(size - 1, -1, -1).forEach(function(i2) {
-                jStat4.sliceAssign(
-                  I,
-                  { row: i2 },
-                  jStat4.divide(jStat4.slice(I, { row: i2 }), A[i2][i2])
-                );
-                jStat4.sliceAssign(
-                  A,
-                  { row: i2 },
-                  jStat4.divide(jStat4.slice(A, { row: i2 }), A[i2][i2])
-                );
-                jStat4.arange(i2).forEach(function(j) {
-                  var c = jStat4.multiply(A[j][i2], -1);
-                  var Aj = jStat4.slice(A, { row: j });
-                  var cAi = jStat4.multiply(jStat4.slice(A, { row: i2 }), c);
-                  jStat4.sliceAssign(A, { row: j }, jStat4.add(Aj, cAi));
-                  var Ij = jStat4.slice(I, { row: j });
-                  var cIi = jStat4.multiply(jStat4.slice(I, { row: i2 }), c);
-                  jStat4.sliceAssign(I, { row: j }, jStat4.add(Ij, cIi));
-                });
-              });
-              return I;
-            }
-            function qr_solve(A, b) {
-              var array_mode = false;
-              if (b[0].length === void 0) {
-                b = b.map(function(x3) {
-                  return [x3];
-                });
-                array_mode = true;
-              }
-              var QR = jStat4.QR(A);
-              var Q = QR[0];
-              var R = QR[1];
-              var attrs = A[0].length;
-              var Q1 = jStat4.slice(Q, { col: { end: attrs } });
-              var R1 = jStat4.slice(R, { row: { end: attrs } });
-              var RI = R_I(R1);
-              var Q2 = jStat4.transpose(Q1);
-              if (Q2[0].length === void 0) {
-                Q2 = [Q2];
-              }
-              var x2 = jStat4.multiply(jStat4.multiply(RI, Q2), b);
-              if (x2.length === void 0) {
-                x2 = [[x2]];
-              }
-              if (array_mode)
-                return x2.map(function(i2) {
-                  return i2[0];
-                });
-              return x2;
-            }
-            return qr_solve;
-          })(),
-          jacobi: function jacobi(a) {
-            var condition = 1;
-            var n = a.length;
-            var e = jStat4.identity(n, n);
-            var ev = [];
-            var b, i2, j, p, q, maxim, theta, s;
-            while (condition === 1) {
-              maxim = a[0][1];
-              p = 0;
-              q = 1;
-              for (i2 = 0; i2 < n; i2++) {
-                for (j = 0; j < n; j++) {
-                  if (i2 != j) {
-                    if (maxim < Math2.abs(a[i2][j])) {
-                      maxim = Math2.abs(a[i2][j]);
-                      p = i2;
-                      q = j;
-                    }
-                  }
-                }
-              }
-              if (a[p][p] === a[q][q])
-                theta = a[p][q] > 0 ? Math2.PI / 4 : -Math2.PI / 4;
-              else
-                theta = Math2.atan(2 * a[p][q] / (a[p][p] - a[q][q])) / 2;
-              s = jStat4.identity(n, n);
-              s[p][p] = Math2.cos(theta);
-              s[p][q] = -Math2.sin(theta);
-              s[q][p] = Math2.sin(theta);
-              s[q][q] = Math2.cos(theta);
-              e = jStat4.multiply(e, s);
-              b = jStat4.multiply(jStat4.multiply(jStat4.inv(s), a), s);
-              a = b;
-              condition = 0;
-              for (i2 = 1; i2 < n; i2++) {
-                for (j = 1; j < n; j++) {
-                  if (i2 != j && Math2.abs(a[i2][j]) > 1e-3) {
-                    condition = 1;
-                  }
-                }
-              }
-            }
-            for (i2 = 0; i2 < n; i2++) ev.push(a[i2][i2]);
-            return [e, ev];
-          },
-          rungekutta: function rungekutta(f, h, p, t_j, u_j, order) {
-            var k1, k2, u_j1, k3, k4;
-            if (order === 2) {
-              while (t_j <= p) {
-                k1 = h * f(t_j, u_j);
-                k2 = h * f(t_j + h, u_j + k1);
-                u_j1 = u_j + (k1 + k2) / 2;
-                u_j = u_j1;
-                t_j = t_j + h;
-              }
-            }
-            if (order === 4) {
-              while (t_j <= p) {
-                k1 = h * f(t_j, u_j);
-                k2 = h * f(t_j + h / 2, u_j + k1 / 2);
-                k3 = h * f(t_j + h / 2, u_j + k2 / 2);
-                k4 = h * f(t_j + h, u_j + k3);
-                u_j1 = u_j + (k1 + 2 * k2 + 2 * k3 + k4) / 6;
-                u_j = u_j1;
-                t_j = t_j + h;
-              }
-            }
-            return u_j;
-          },
-          romberg: function romberg(f, a, b, order) {
-            var i2 = 0;
-            var h = (b - a) / 2;
-            var x2 = [];
-            var h1 = [];
-            var g = [];
-            var m, a1, j, k, I;
-            while (i2 < order / 2) {
-              I = f(a);
-              for (j = a, k = 0; j <= b; j = j + h, k++) x2[k] = j;
-              m = x2.length;
-              for (j = 1; j < m - 1; j++) {
-                I += (j % 2 !== 0 ? 4 : 2) * f(x2[j]);
-              }
-              I = h / 3 * (I + f(b));
-              g[i2] = I;
-              h /= 2;
-              i2++;
-            }
-            a1 = g.length;
-            m = 1;
-            while (a1 !== 1) {
-              for (j = 0; j < a1 - 1; j++)
-                h1[j] = (Math2.pow(4, m) * g[j + 1] - g[j]) / (Math2.pow(4, m) - 1);
-              a1 = h1.length;
-              g = h1;
-              h1 = [];
-              m++;
-            }
-            return g;
-          },
-          richardson: function richardson(X, f, x2, h) {
-            function pos(X2, x3) {
-              var i3 = 0;
-              var n = X2.length;
-              var p;
-              for (; i3 < n; i3++)
-                if (X2[i3] === x3) p = i3;
-              return p;
-            }
-            var h_min = Math2.abs(x2 - X[pos(X, x2) + 1]);
-            var i2 = 0;
-            var g = [];
-            var h1 = [];
-            var y1, y2, m, a, j;
-            while (h >= h_min) {
-              y1 = pos(X, x2 + h);
-              y2 = pos(X, x2);
-              g[i2] = (f[y1] - 2 * f[y2] + f[2 * y2 - y1]) / (h * h);
-              h /= 2;
-              i2++;
-            }
-            a = g.length;
-            m = 1;
-            while (a != 1) {
-              for (j = 0; j < a - 1; j++)
-                h1[j] = (Math2.pow(4, m) * g[j + 1] - g[j]) / (Math2.pow(4, m) - 1);
-              a = h1.length;
-              g = h1;
-              h1 = [];
-              m++;
-            }
-            return g;
-          },
-          simpson: function simpson(f, a, b, n) {
-            var h = (b - a) / n;
-            var I = f(a);
-            var x2 = [];
-            var j = a;
-            var k = 0;
-            var i2 = 1;
-            var m;
-            for (; j <= b; j = j + h, k++)
-              x2[k] = j;
-            m = x2.length;
-            for (; i2 < m - 1; i2++) {
-              I += (i2 % 2 !== 0 ? 4 : 2) * f(x2[i2]);
-            }
-            return h / 3 * (I + f(b));
-          },
-          hermite: function hermite(X, F, dF, value) {
-            var n = X.length;
-            var p = 0;
-            var i2 = 0;
-            var l = [];
-            var dl = [];
-            var A = [];
-            var B = [];
-            var j;
-            for (; i2 < n; i2++) {
-              l[i2] = 1;
-              for (j = 0; j < n; j++) {
-                if (i2 != j) l[i2] *= (value - X[j]) / (X[i2] - X[j]);
-              }
-              dl[i2] = 0;
-              for (j = 0; j < n; j++) {
-                if (i2 != j) dl[i2] += 1 / (X[i2] - X[j]);
-              }
-              A[i2] = (1 - 2 * (value - X[i2]) * dl[i2]) * (l[i2] * l[i2]);
-              B[i2] = (value - X[i2]) * (l[i2] * l[i2]);
-              p += A[i2] * F[i2] + B[i2] * dF[i2];
-            }
-            return p;
-          },
-          lagrange: function lagrange(X, F, value) {
-            var p = 0;
-            var i2 = 0;
-            var j, l;
-            var n = X.length;
-            for (; i2 < n; i2++) {
-              l = F[i2];
-              for (j = 0; j < n; j++) {
-                if (i2 != j) l *= (value - X[j]) / (X[i2] - X[j]);
-              }
-              p += l;
-            }
-            return p;
-          },
-          cubic_spline: function cubic_spline(X, F, value) {
-            var n = X.length;
-            var i2 = 0, j;
-            var A = [];
-            var B = [];
-            var alpha = [];
-            var c = [];
-            var h = [];
-            var b = [];
-            var d = [];
-            for (; i2 < n - 1; i2++)
-              h[i2] = X[i2 + 1] - X[i2];
-            alpha[0] = 0;
-            for (i2 = 1; i2 < n - 1; i2++) {
-              alpha[i2] = 3 / h[i2] * (F[i2 + 1] - F[i2]) - 3 / h[i2 - 1] * (F[i2] - F[i2 - 1]);
-            }
-            for (i2 = 1; i2 < n - 1; i2++) {
-              A[i2] = [];
-              B[i2] = [];
-              A[i2][i2 - 1] = h[i2 - 1];
-              A[i2][i2] = 2 * (h[i2 - 1] + h[i2]);
-              A[i2][i2 + 1] = h[i2];
-              B[i2][0] = alpha[i2];
-            }
-            c = jStat4.multiply(jStat4.inv(A), B);
-            for (j = 0; j < n - 1; j++) {
-              b[j] = (F[j + 1] - F[j]) / h[j] - h[j] * (c[j + 1][0] + 2 * c[j][0]) / 3;
-              d[j] = (c[j + 1][0] - c[j][0]) / (3 * h[j]);
-            }
-            for (j = 0; j < n; j++) {
-              if (X[j] > value) break;
-            }
-            j -= 1;
-            return F[j] + (value - X[j]) * b[j] + jStat4.sq(value - X[j]) * c[j] + (value - X[j]) * jStat4.sq(value - X[j]) * d[j];
-          },
-          gauss_quadrature: function gauss_quadrature() {
-            throw new Error("gauss_quadrature not yet implemented");
-          },
-          PCA: function PCA(X) {
-            var m = X.length;
-            var n = X[0].length;
-            var i2 = 0;
-            var j, temp1;
-            var u = [];
-            var D = [];
-            var result = [];
-            var temp2 = [];
-            var Y = [];
-            var Bt = [];
-            var B = [];
-            var C = [];
-            var V = [];
-            var Vt = [];
-            for (i2 = 0; i2 < m; i2++) {
-              u[i2] = jStat4.sum(X[i2]) / n;
-            }
-            for (i2 = 0; i2 < n; i2++) {
-              B[i2] = [];
-              for (j = 0; j < m; j++) {
-                B[i2][j] = X[j][i2] - u[j];
-              }
-            }
-            B = jStat4.transpose(B);
-            for (i2 = 0; i2 < m; i2++) {
-              C[i2] = [];
-              for (j = 0; j < m; j++) {
-                C[i2][j] = jStat4.dot([B[i2]], [B[j]]) / (n - 1);
-              }
-            }
-            result = jStat4.jacobi(C);
-            V = result[0];
-            D = result[1];
-            Vt = jStat4.transpose(V);
-            for (i2 = 0; i2 < D.length; i2++) {
-              for (j = i2; j < D.length; j++) {
-                if (D[i2] < D[j]) {
-                  temp1 = D[i2];
-                  D[i2] = D[j];
-                  D[j] = temp1;
-                  temp2 = Vt[i2];
-                  Vt[i2] = Vt[j];
-                  Vt[j] = temp2;
-                }
-              }
-            }
-            Bt = jStat4.transpose(B);
-            for (i2 = 0; i2 < m; i2++) {
-              Y[i2] = [];
-              for (j = 0; j < Bt.length; j++) {
-                Y[i2][j] = jStat4.dot([Vt[i2]], [Bt[j]]);
-              }
-            }
-            return [X, D, Vt, Y];
-          }
-        });
-        (function(funcs) {
-          for (var i2 = 0; i2 < funcs.length; i2++) (function(passfunc) {
-            jStat4.fn[passfunc] = function(arg, func) {
-              var tmpthis = this;
-              if (func) {
-                setTimeout(function() {
-                  func.call(tmpthis, jStat4.fn[passfunc].call(tmpthis, arg));
-                }, 15);
-                return this;
-              }
-              if (typeof jStat4[passfunc](this, arg) === "number")
-                return jStat4[passfunc](this, arg);
-              else
-                return jStat4(jStat4[passfunc](this, arg));
-            };
-          })(funcs[i2]);
-        })("add divide multiply subtract dot pow exp log abs norm angle".split(" "));
-      })(jStat3, Math);
-      (function(jStat4, Math2) {
-        var slice = [].slice;
-        var isNumber = jStat4.utils.isNumber;
-        var isArray = jStat4.utils.isArray;
-        jStat4.extend({
-          // 2 different parameter lists:
-          // (value, mean, sd)
-          // (value, array, flag)
-          zscore: function zscore() {
-            var args = slice.call(arguments);
-            if (isNumber(args[1])) {
-              return (args[0] - args[1]) / args[2];
-            }
-            return (args[0] - jStat4.mean(args[1])) / jStat4.stdev(args[1], args[2]);
-          },
-          // 3 different paramter lists:
-          // (value, mean, sd, sides)
-          // (zscore, sides)
-          // (value, array, sides, flag)
-          ztest: function ztest() {
-            var args = slice.call(arguments);
-            var z;
-            if (isArray(args[1])) {
-              z = jStat4.zscore(args[0], args[1], args[3]);
-              return args[2] === 1 ? jStat4.normal.cdf(-Math2.abs(z), 0, 1) : jStat4.normal.cdf(-Math2.abs(z), 0, 1) * 2;
-            } else {
-              if (args.length > 2) {
-                z = jStat4.zscore(args[0], args[1], args[2]);
-                return args[3] === 1 ? jStat4.normal.cdf(-Math2.abs(z), 0, 1) : jStat4.normal.cdf(-Math2.abs(z), 0, 1) * 2;
-              } else {
-                z = args[0];
-                return args[1] === 1 ? jStat4.normal.cdf(-Math2.abs(z), 0, 1) : jStat4.normal.cdf(-Math2.abs(z), 0, 1) * 2;
-              }
-            }
-          }
-        });
-        jStat4.extend(jStat4.fn, {
-          zscore: function zscore(value, flag) {
-            return (value - this.mean()) / this.stdev(flag);
-          },
-          ztest: function ztest(value, sides, flag) {
-            var zscore = Math2.abs(this.zscore(value, flag));
-            return sides === 1 ? jStat4.normal.cdf(-zscore, 0, 1) : jStat4.normal.cdf(-zscore, 0, 1) * 2;
-          }
-        });
-        jStat4.extend({
-          // 2 parameter lists
-          // (value, mean, sd, n)
-          // (value, array)
-          tscore: function tscore() {
-            var args = slice.call(arguments);
-            return args.length === 4 ? (args[0] - args[1]) / (args[2] / Math2.sqrt(args[3])) : (args[0] - jStat4.mean(args[1])) / (jStat4.stdev(args[1], true) / Math2.sqrt(args[1].length));
-          },
-          // 3 different paramter lists:
-          // (value, mean, sd, n, sides)
-          // (tscore, n, sides)
-          // (value, array, sides)
-          ttest: function ttest() {
-            var args = slice.call(arguments);
-            var tscore;
-            if (args.length === 5) {
-              tscore = Math2.abs(jStat4.tscore(args[0], args[1], args[2], args[3]));
-              return args[4] === 1 ? jStat4.studentt.cdf(-tscore, args[3] - 1) : jStat4.studentt.cdf(-tscore, args[3] - 1) * 2;
-            }
-            if (isNumber(args[1])) {
-              tscore = Math2.abs(args[0]);
-              return args[2] == 1 ? jStat4.studentt.cdf(-tscore, args[1] - 1) : jStat4.studentt.cdf(-tscore, args[1] - 1) * 2;
-            }
-            tscore = Math2.abs(jStat4.tscore(args[0], args[1]));
-            return args[2] == 1 ? jStat4.studentt.cdf(-tscore, args[1].length - 1) : jStat4.studentt.cdf(-tscore, args[1].length - 1) * 2;
-          }
-        });
-        jStat4.extend(jStat4.fn, {
-          tscore: function tscore(value) {
-            return (value - this.mean()) / (this.stdev(true) / Math2.sqrt(this.cols()));
-          },
-          ttest: function ttest(value, sides) {
-            return sides === 1 ? 1 - jStat4.studentt.cdf(Math2.abs(this.tscore(value)), this.cols() - 1) : jStat4.studentt.cdf(-Math2.abs(this.tscore(value)), this.cols() - 1) * 2;
-          }
-        });
-        jStat4.extend({
-          // Paramter list is as follows:
-          // (array1, array2, array3, ...)
-          // or it is an array of arrays
-          // array of arrays conversion
-          anovafscore: function anovafscore() {
-            var args = slice.call(arguments), expVar, sample, sampMean, sampSampMean, tmpargs, unexpVar, i2, j;
-            if (args.length === 1) {
-              tmpargs = new Array(args[0].length);
-              for (i2 = 0; i2 < args[0].length; i2++) {
-                tmpargs[i2] = args[0][i2];
-              }
-              args = tmpargs;
-            }
-            sample = new Array();
-            for (i2 = 0; i2 < args.length; i2++) {
-              sample = sample.concat(args[i2]);
-            }
-            sampMean = jStat4.mean(sample);
-            expVar = 0;
-            for (i2 = 0; i2 < args.length; i2++) {
-              expVar = expVar + args[i2].length * Math2.pow(jStat4.mean(args[i2]) - sampMean, 2);
-            }
-            expVar /= args.length - 1;
-            unexpVar = 0;
-            for (i2 = 0; i2 < args.length; i2++) {
-              sampSampMean = jStat4.mean(args[i2]);
-              for (j = 0; j < args[i2].length; j++) {
-                unexpVar += Math2.pow(args[i2][j] - sampSampMean, 2);
-              }
-            }
-            unexpVar /= sample.length - args.length;
-            return expVar / unexpVar;
-          },
-          // 2 different paramter setups
-          // (array1, array2, array3, ...)
-          // (anovafscore, df1, df2)
-          anovaftest: function anovaftest() {
-            var args = slice.call(arguments), df1, df2, n, i2;
-            if (isNumber(args[0])) {
-              return 1 - jStat4.centralF.cdf(args[0], args[1], args[2]);
-            }
-            var anovafscore = jStat4.anovafscore(args);
-            df1 = args.length - 1;
-            n = 0;
-            for (i2 = 0; i2 < args.length; i2++) {
-              n = n + args[i2].length;
-            }
-            df2 = n - df1 - 1;
-            return 1 - jStat4.centralF.cdf(anovafscore, df1, df2);
-          },
-          ftest: function ftest(fscore, df1, df2) {
-            return 1 - jStat4.centralF.cdf(fscore, df1, df2);
-          }
-        });
-        jStat4.extend(jStat4.fn, {
-          anovafscore: function anovafscore() {
-            return jStat4.anovafscore(this.toArray());
-          },
-          anovaftes: function anovaftes() {
-            var n = 0;
-            var i2;
-            for (i2 = 0; i2 < this.length; i2++) {
-              n = n + this[i2].length;
-            }
-            return jStat4.ftest(this.anovafscore(), this.length - 1, n - this.length);
-          }
-        });
-        jStat4.extend({
-          // 2 parameter lists
-          // (mean1, mean2, n1, n2, sd)
-          // (array1, array2, sd)
-          qscore: function qscore() {
-            var args = slice.call(arguments);
-            var mean1, mean2, n1, n2, sd;
-            if (isNumber(args[0])) {
-              mean1 = args[0];
-              mean2 = args[1];
-              n1 = args[2];
-              n2 = args[3];
-              sd = args[4];
-            } else {
-              mean1 = jStat4.mean(args[0]);
-              mean2 = jStat4.mean(args[1]);
-              n1 = args[0].length;
-              n2 = args[1].length;
-              sd = args[2];
-            }
-            return Math2.abs(mean1 - mean2) / (sd * Math2.sqrt((1 / n1 + 1 / n2) / 2));
-          },
-          // 3 different parameter lists:
-          // (qscore, n, k)
-          // (mean1, mean2, n1, n2, sd, n, k)
-          // (array1, array2, sd, n, k)
-          qtest: function qtest() {
-            var args = slice.call(arguments);
-            var qscore;
-            if (args.length === 3) {
-              qscore = args[0];
-              args = args.slice(1);
-            } else if (args.length === 7) {
-              qscore = jStat4.qscore(args[0], args[1], args[2], args[3], args[4]);
-              args = args.slice(5);
-            } else {
-              qscore = jStat4.qscore(args[0], args[1], args[2]);
-              args = args.slice(3);
-            }
-            var n = args[0];
-            var k = args[1];
-            return 1 - jStat4.tukey.cdf(qscore, k, n - k);
-          },
-          tukeyhsd: function tukeyhsd(arrays) {
-            var sd = jStat4.pooledstdev(arrays);
-            var means = arrays.map(function(arr) {
-              return jStat4.mean(arr);
-            });
-            var n = arrays.reduce(function(n2, arr) {
-              return n2 + arr.length;
-            }, 0);
-            var results = [];
-            for (var i2 = 0; i2 < arrays.length; ++i2) {
-              for (var j = i2 + 1; j < arrays.length; ++j) {
-                var p = jStat4.qtest(means[i2], means[j], arrays[i2].length, arrays[j].length, sd, n, arrays.length);
-                results.push([[i2, j], p]);
-              }
-            }
-            return results;
-          }
-        });
-        jStat4.extend({
-          // 2 different parameter setups
-          // (value, alpha, sd, n)
-          // (value, alpha, array)
-          normalci: function normalci() {
-            var args = slice.call(arguments), ans = new Array(2), change;
-            if (args.length === 4) {
-              change = Math2.abs(jStat4.normal.inv(args[1] / 2, 0, 1) * args[2] / Math2.sqrt(args[3]));
-            } else {
-              change = Math2.abs(jStat4.normal.inv(args[1] / 2, 0, 1) * jStat4.stdev(args[2]) / Math2.sqrt(args[2].length));
-            }
-            ans[0] = args[0] - change;
-            ans[1] = args[0] + change;
-            return ans;
-          },
-          // 2 different parameter setups
-          // (value, alpha, sd, n)
-          // (value, alpha, array)
-          tci: function tci() {
-            var args = slice.call(arguments), ans = new Array(2), change;
-            if (args.length === 4) {
-              change = Math2.abs(jStat4.studentt.inv(args[1] / 2, args[3] - 1) * args[2] / Math2.sqrt(args[3]));
-            } else {
-              change = Math2.abs(jStat4.studentt.inv(args[1] / 2, args[2].length - 1) * jStat4.stdev(args[2], true) / Math2.sqrt(args[2].length));
-            }
-            ans[0] = args[0] - change;
-            ans[1] = args[0] + change;
-            return ans;
-          },
-          significant: function significant(pvalue, alpha) {
-            return pvalue < alpha;
-          }
-        });
-        jStat4.extend(jStat4.fn, {
-          normalci: function normalci(value, alpha) {
-            return jStat4.normalci(value, alpha, this.toArray());
-          },
-          tci: function tci(value, alpha) {
-            return jStat4.tci(value, alpha, this.toArray());
-          }
-        });
-        function differenceOfProportions(p1, n1, p2, n2) {
-          if (p1 > 1 || p2 > 1 || p1 <= 0 || p2 <= 0) {
-            throw new Error("Proportions should be greater than 0 and less than 1");
-          }
-          var pooled = (p1 * n1 + p2 * n2) / (n1 + n2);
-          var se = Math2.sqrt(pooled * (1 - pooled) * (1 / n1 + 1 / n2));
-          return (p1 - p2) / se;
-        }
-        jStat4.extend(jStat4.fn, {
-          oneSidedDifferenceOfProportions: function oneSidedDifferenceOfProportions(p1, n1, p2, n2) {
-            var z = differenceOfProportions(p1, n1, p2, n2);
-            return jStat4.ztest(z, 1);
-          },
-          twoSidedDifferenceOfProportions: function twoSidedDifferenceOfProportions(p1, n1, p2, n2) {
-            var z = differenceOfProportions(p1, n1, p2, n2);
-            return jStat4.ztest(z, 2);
-          }
-        });
-      })(jStat3, Math);
-      jStat3.models = /* @__PURE__ */ (function() {
-        function sub_regress(exog) {
-          var var_count = exog[0].length;
-          var modelList = jStat3.arange(var_count).map(function(endog_index) {
-            var exog_index = jStat3.arange(var_count).filter(function(i2) {
-              return i2 !== endog_index;
-            });
-            return ols(
-              jStat3.col(exog, endog_index).map(function(x2) {
-                return x2[0];
-              }),
-              jStat3.col(exog, exog_index)
-            );
-          });
-          return modelList;
-        }
-        function ols(endog, exog) {
-          var nobs = endog.length;
-          var df_model = exog[0].length - 1;
-          var df_resid = nobs - df_model - 1;
-          var coef = jStat3.lstsq(exog, endog);
-          var predict = jStat3.multiply(exog, coef.map(function(x2) {
-            return [x2];
-          })).map(function(p) {
-            return p[0];
-          });
-          var resid = jStat3.subtract(endog, predict);
-          var ybar = jStat3.mean(endog);
-          var SSE = jStat3.sum(predict.map(function(f) {
-            return Math.pow(f - ybar, 2);
-          }));
-          var SSR = jStat3.sum(endog.map(function(y, i2) {
-            return Math.pow(y - predict[i2], 2);
-          }));
-          var SST = SSE + SSR;
-          var R2 = SSE / SST;
-          return {
-            exog,
-            endog,
-            nobs,
-            df_model,
-            df_resid,
-            coef,
-            predict,
-            resid,
-            ybar,
-            SST,
-            SSE,
-            SSR,
-            R2
-          };
-        }
-        function t_test(model) {
-          var subModelList = sub_regress(model.exog);
-          var sigmaHat = Math.sqrt(model.SSR / model.df_resid);
-          var seBetaHat = subModelList.map(function(mod) {
-            var SST = mod.SST;
-            var R2 = mod.R2;
-            return sigmaHat / Math.sqrt(SST * (1 - R2));
-          });
-          var tStatistic = model.coef.map(function(coef, i2) {
-            return (coef - 0) / seBetaHat[i2];
-          });
-          var pValue2 = tStatistic.map(function(t) {
-            var leftppf = jStat3.studentt.cdf(t, model.df_resid);
-            return (leftppf > 0.5 ? 1 - leftppf : leftppf) * 2;
-          });
-          var c = jStat3.studentt.inv(0.975, model.df_resid);
-          var interval95 = model.coef.map(function(coef, i2) {
-            var d = c * seBetaHat[i2];
-            return [coef - d, coef + d];
-          });
-          return {
-            se: seBetaHat,
-            t: tStatistic,
-            p: pValue2,
-            sigmaHat,
-            interval95
-          };
-        }
-        function F_test(model) {
-          var F_statistic = model.R2 / model.df_model / ((1 - model.R2) / model.df_resid);
-          var fcdf = function(x2, n1, n2) {
-            return jStat3.beta.cdf(x2 / (n2 / n1 + x2), n1 / 2, n2 / 2);
-          };
-          var pvalue = 1 - fcdf(F_statistic, model.df_model, model.df_resid);
-          return { F_statistic, pvalue };
-        }
-        function ols_wrap(endog, exog) {
-          var model = ols(endog, exog);
-          var ttest = t_test(model);
-          var ftest = F_test(model);
-          var adjust_R2 = 1 - (1 - model.R2) * ((model.nobs - 1) / model.df_resid);
-          model.t = ttest;
-          model.f = ftest;
-          model.adjust_R2 = adjust_R2;
-          return model;
-        }
-        return { ols: ols_wrap };
-      })();
-      jStat3.extend({
-        buildxmatrix: function buildxmatrix() {
-          var matrixRows = new Array(arguments.length);
-          for (var i2 = 0; i2 < arguments.length; i2++) {
-            var array = [1];
-            matrixRows[i2] = array.concat(arguments[i2]);
-          }
-          return jStat3(matrixRows);
-        },
-        builddxmatrix: function builddxmatrix() {
-          var matrixRows = new Array(arguments[0].length);
-          for (var i2 = 0; i2 < arguments[0].length; i2++) {
-            var array = [1];
-            matrixRows[i2] = array.concat(arguments[0][i2]);
-          }
-          return jStat3(matrixRows);
-        },
-        buildjxmatrix: function buildjxmatrix(jMat) {
-          var pass = new Array(jMat.length);
-          for (var i2 = 0; i2 < jMat.length; i2++) {
-            pass[i2] = jMat[i2];
-          }
-          return jStat3.builddxmatrix(pass);
-        },
-        buildymatrix: function buildymatrix(array) {
-          return jStat3(array).transpose();
-        },
-        buildjymatrix: function buildjymatrix(jMat) {
-          return jMat.transpose();
-        },
-        matrixmult: function matrixmult(A, B) {
-          var i2, j, k, result, sum;
-          if (A.cols() == B.rows()) {
-            if (B.rows() > 1) {
-              result = [];
-              for (i2 = 0; i2 < A.rows(); i2++) {
-                result[i2] = [];
-                for (j = 0; j < B.cols(); j++) {
-                  sum = 0;
-                  for (k = 0; k < A.cols(); k++) {
-                    sum += A.toArray()[i2][k] * B.toArray()[k][j];
-                  }
-                  result[i2][j] = sum;
-                }
-              }
-              return jStat3(result);
-            }
-            result = [];
-            for (i2 = 0; i2 < A.rows(); i2++) {
-              result[i2] = [];
-              for (j = 0; j < B.cols(); j++) {
-                sum = 0;
-                for (k = 0; k < A.cols(); k++) {
-                  sum += A.toArray()[i2][k] * B.toArray()[j];
-                }
-                result[i2][j] = sum;
-              }
-            }
-            return jStat3(result);
-          }
-        },
-        //regress and regresst to be fixed
-        regress: function regress(jMatX, jMatY) {
-          var innerinv = jStat3.xtranspxinv(jMatX);
-          var xtransp = jMatX.transpose();
-          var next = jStat3.matrixmult(jStat3(innerinv), xtransp);
-          return jStat3.matrixmult(next, jMatY);
-        },
-        regresst: function regresst(jMatX, jMatY, sides) {
-          var beta = jStat3.regress(jMatX, jMatY);
-          var compile = {};
-          compile.anova = {};
-          var jMatYBar = jStat3.jMatYBar(jMatX, beta);
-          compile.yBar = jMatYBar;
-          var yAverage = jMatY.mean();
-          compile.anova.residuals = jStat3.residuals(jMatY, jMatYBar);
-          compile.anova.ssr = jStat3.ssr(jMatYBar, yAverage);
-          compile.anova.msr = compile.anova.ssr / (jMatX[0].length - 1);
-          compile.anova.sse = jStat3.sse(jMatY, jMatYBar);
-          compile.anova.mse = compile.anova.sse / (jMatY.length - (jMatX[0].length - 1) - 1);
-          compile.anova.sst = jStat3.sst(jMatY, yAverage);
-          compile.anova.mst = compile.anova.sst / (jMatY.length - 1);
-          compile.anova.r2 = 1 - compile.anova.sse / compile.anova.sst;
-          if (compile.anova.r2 < 0) compile.anova.r2 = 0;
-          compile.anova.fratio = compile.anova.msr / compile.anova.mse;
-          compile.anova.pvalue = jStat3.anovaftest(
-            compile.anova.fratio,
-            jMatX[0].length - 1,
-            jMatY.length - (jMatX[0].length - 1) - 1
-          );
-          compile.anova.rmse = Math.sqrt(compile.anova.mse);
-          compile.anova.r2adj = 1 - compile.anova.mse / compile.anova.mst;
-          if (compile.anova.r2adj < 0) compile.anova.r2adj = 0;
-          compile.stats = new Array(jMatX[0].length);
-          var covar = jStat3.xtranspxinv(jMatX);
-          var sds, ts, ps;
-          for (var i2 = 0; i2 < beta.length; i2++) {
-            sds = Math.sqrt(compile.anova.mse * Math.abs(covar[i2][i2]));
-            ts = Math.abs(beta[i2] / sds);
-            ps = jStat3.ttest(ts, jMatY.length - jMatX[0].length - 1, sides);
-            compile.stats[i2] = [beta[i2], sds, ts, ps];
-          }
-          compile.regress = beta;
-          return compile;
-        },
-        xtranspx: function xtranspx(jMatX) {
-          return jStat3.matrixmult(jMatX.transpose(), jMatX);
-        },
-        xtranspxinv: function xtranspxinv(jMatX) {
-          var inner = jStat3.matrixmult(jMatX.transpose(), jMatX);
-          var innerinv = jStat3.inv(inner);
-          return innerinv;
-        },
-        jMatYBar: function jMatYBar(jMatX, beta) {
-          var yBar = jStat3.matrixmult(jMatX, beta);
-          return new jStat3(yBar);
-        },
-        residuals: function residuals(jMatY, jMatYBar) {
-          return jStat3.matrixsubtract(jMatY, jMatYBar);
-        },
-        ssr: function ssr(jMatYBar, yAverage) {
-          var ssr2 = 0;
-          for (var i2 = 0; i2 < jMatYBar.length; i2++) {
-            ssr2 += Math.pow(jMatYBar[i2] - yAverage, 2);
-          }
-          return ssr2;
-        },
-        sse: function sse(jMatY, jMatYBar) {
-          var sse2 = 0;
-          for (var i2 = 0; i2 < jMatY.length; i2++) {
-            sse2 += Math.pow(jMatY[i2] - jMatYBar[i2], 2);
-          }
-          return sse2;
-        },
-        sst: function sst(jMatY, yAverage) {
-          var sst2 = 0;
-          for (var i2 = 0; i2 < jMatY.length; i2++) {
-            sst2 += Math.pow(jMatY[i2] - yAverage, 2);
-          }
-          return sst2;
-        },
-        matrixsubtract: function matrixsubtract(A, B) {
-          var ans = new Array(A.length);
-          for (var i2 = 0; i2 < A.length; i2++) {
-            ans[i2] = new Array(A[i2].length);
-            for (var j = 0; j < A[i2].length; j++) {
-              ans[i2][j] = A[i2][j] - B[i2][j];
-            }
-          }
-          return jStat3(ans);
-        }
-      });
-      jStat3.jStat = jStat3;
-      return jStat3;
-    });
-  }
-});
-
 // node_modules/ajv/dist/vocabularies/dynamic/dynamicAnchor.js
 var require_dynamicAnchor = __commonJS({
   "node_modules/ajv/dist/vocabularies/dynamic/dynamicAnchor.js"(exports) {
@@ -30675,7 +26824,7 @@ var require__ = __commonJS({
     var discriminator_1 = require_discriminator();
     var json_schema_2020_12_1 = require_json_schema_2020_12();
     var META_SCHEMA_ID = "https://json-schema.org/draft/2020-12/schema";
-    var Ajv20203 = class extends core_1.default {
+    var Ajv20204 = class extends core_1.default {
       constructor(opts = {}) {
         super({
           ...opts,
@@ -30702,11 +26851,11 @@ var require__ = __commonJS({
         return this.opts.defaultMeta = super.defaultMeta() || (this.getSchema(META_SCHEMA_ID) ? META_SCHEMA_ID : void 0);
       }
     };
-    exports.Ajv2020 = Ajv20203;
-    module.exports = exports = Ajv20203;
-    module.exports.Ajv2020 = Ajv20203;
+    exports.Ajv2020 = Ajv20204;
+    module.exports = exports = Ajv20204;
+    module.exports.Ajv2020 = Ajv20204;
     Object.defineProperty(exports, "__esModule", { value: true });
-    exports.default = Ajv20203;
+    exports.default = Ajv20204;
     var validate_1 = require_validate();
     Object.defineProperty(exports, "KeywordCxt", { enumerable: true, get: function() {
       return validate_1.KeywordCxt;
@@ -30738,6 +26887,3857 @@ var require__ = __commonJS({
     Object.defineProperty(exports, "MissingRefError", { enumerable: true, get: function() {
       return ref_error_1.default;
     } });
+  }
+});
+
+// node_modules/jstat/dist/jstat.js
+var require_jstat = __commonJS({
+  "node_modules/jstat/dist/jstat.js"(exports, module) {
+    (function(window2, factory) {
+      if (typeof exports === "object") {
+        module.exports = factory();
+      } else if (typeof define === "function" && define.amd) {
+        define(factory);
+      } else {
+        window2.jStat = factory();
+      }
+    })(exports, function() {
+      var jStat3 = (function(Math2, undefined2) {
+        var concat = Array.prototype.concat;
+        var slice = Array.prototype.slice;
+        var toString = Object.prototype.toString;
+        function calcRdx(n, m) {
+          var val = n > m ? n : m;
+          return Math2.pow(
+            10,
+            17 - ~~(Math2.log(val > 0 ? val : -val) * Math2.LOG10E)
+          );
+        }
+        var isArray = Array.isArray || function isArray2(arg) {
+          return toString.call(arg) === "[object Array]";
+        };
+        function isFunction(arg) {
+          return toString.call(arg) === "[object Function]";
+        }
+        function isNumber(num) {
+          return typeof num === "number" ? num - num === 0 : false;
+        }
+        function toVector(arr) {
+          return concat.apply([], arr);
+        }
+        function jStat4() {
+          return new jStat4._init(arguments);
+        }
+        jStat4.fn = jStat4.prototype;
+        jStat4._init = function _init(args) {
+          if (isArray(args[0])) {
+            if (isArray(args[0][0])) {
+              if (isFunction(args[1]))
+                args[0] = jStat4.map(args[0], args[1]);
+              for (var i2 = 0; i2 < args[0].length; i2++)
+                this[i2] = args[0][i2];
+              this.length = args[0].length;
+            } else {
+              this[0] = isFunction(args[1]) ? jStat4.map(args[0], args[1]) : args[0];
+              this.length = 1;
+            }
+          } else if (isNumber(args[0])) {
+            this[0] = jStat4.seq.apply(null, args);
+            this.length = 1;
+          } else if (args[0] instanceof jStat4) {
+            return jStat4(args[0].toArray());
+          } else {
+            this[0] = [];
+            this.length = 1;
+          }
+          return this;
+        };
+        jStat4._init.prototype = jStat4.prototype;
+        jStat4._init.constructor = jStat4;
+        jStat4.utils = {
+          calcRdx,
+          isArray,
+          isFunction,
+          isNumber,
+          toVector
+        };
+        jStat4._random_fn = Math2.random;
+        jStat4.setRandom = function setRandom(fn) {
+          if (typeof fn !== "function")
+            throw new TypeError("fn is not a function");
+          jStat4._random_fn = fn;
+        };
+        jStat4.extend = function extend(obj) {
+          var i2, j;
+          if (arguments.length === 1) {
+            for (j in obj)
+              jStat4[j] = obj[j];
+            return this;
+          }
+          for (i2 = 1; i2 < arguments.length; i2++) {
+            for (j in arguments[i2])
+              obj[j] = arguments[i2][j];
+          }
+          return obj;
+        };
+        jStat4.rows = function rows(arr) {
+          return arr.length || 1;
+        };
+        jStat4.cols = function cols(arr) {
+          return arr[0].length || 1;
+        };
+        jStat4.dimensions = function dimensions(arr) {
+          return {
+            rows: jStat4.rows(arr),
+            cols: jStat4.cols(arr)
+          };
+        };
+        jStat4.row = function row(arr, index) {
+          if (isArray(index)) {
+            return index.map(function(i2) {
+              return jStat4.row(arr, i2);
+            });
+          }
+          return arr[index];
+        };
+        jStat4.rowa = function rowa(arr, i2) {
+          return jStat4.row(arr, i2);
+        };
+        jStat4.col = function col(arr, index) {
+          if (isArray(index)) {
+            var submat = jStat4.arange(arr.length).map(function() {
+              return new Array(index.length);
+            });
+            index.forEach(function(ind, i3) {
+              jStat4.arange(arr.length).forEach(function(j) {
+                submat[j][i3] = arr[j][ind];
+              });
+            });
+            return submat;
+          }
+          var column = new Array(arr.length);
+          for (var i2 = 0; i2 < arr.length; i2++)
+            column[i2] = [arr[i2][index]];
+          return column;
+        };
+        jStat4.cola = function cola(arr, i2) {
+          return jStat4.col(arr, i2).map(function(a) {
+            return a[0];
+          });
+        };
+        jStat4.diag = function diag(arr) {
+          var nrow = jStat4.rows(arr);
+          var res = new Array(nrow);
+          for (var row = 0; row < nrow; row++)
+            res[row] = [arr[row][row]];
+          return res;
+        };
+        jStat4.antidiag = function antidiag(arr) {
+          var nrow = jStat4.rows(arr) - 1;
+          var res = new Array(nrow);
+          for (var i2 = 0; nrow >= 0; nrow--, i2++)
+            res[i2] = [arr[i2][nrow]];
+          return res;
+        };
+        jStat4.transpose = function transpose(arr) {
+          var obj = [];
+          var objArr, rows, cols, j, i2;
+          if (!isArray(arr[0]))
+            arr = [arr];
+          rows = arr.length;
+          cols = arr[0].length;
+          for (i2 = 0; i2 < cols; i2++) {
+            objArr = new Array(rows);
+            for (j = 0; j < rows; j++)
+              objArr[j] = arr[j][i2];
+            obj.push(objArr);
+          }
+          return obj.length === 1 ? obj[0] : obj;
+        };
+        jStat4.map = function map(arr, func, toAlter) {
+          var row, nrow, ncol, res, col;
+          if (!isArray(arr[0]))
+            arr = [arr];
+          nrow = arr.length;
+          ncol = arr[0].length;
+          res = toAlter ? arr : new Array(nrow);
+          for (row = 0; row < nrow; row++) {
+            if (!res[row])
+              res[row] = new Array(ncol);
+            for (col = 0; col < ncol; col++)
+              res[row][col] = func(arr[row][col], row, col);
+          }
+          return res.length === 1 ? res[0] : res;
+        };
+        jStat4.cumreduce = function cumreduce(arr, func, toAlter) {
+          var row, nrow, ncol, res, col;
+          if (!isArray(arr[0]))
+            arr = [arr];
+          nrow = arr.length;
+          ncol = arr[0].length;
+          res = toAlter ? arr : new Array(nrow);
+          for (row = 0; row < nrow; row++) {
+            if (!res[row])
+              res[row] = new Array(ncol);
+            if (ncol > 0)
+              res[row][0] = arr[row][0];
+            for (col = 1; col < ncol; col++)
+              res[row][col] = func(res[row][col - 1], arr[row][col]);
+          }
+          return res.length === 1 ? res[0] : res;
+        };
+        jStat4.alter = function alter(arr, func) {
+          return jStat4.map(arr, func, true);
+        };
+        jStat4.create = function create(rows, cols, func) {
+          var res = new Array(rows);
+          var i2, j;
+          if (isFunction(cols)) {
+            func = cols;
+            cols = rows;
+          }
+          for (i2 = 0; i2 < rows; i2++) {
+            res[i2] = new Array(cols);
+            for (j = 0; j < cols; j++)
+              res[i2][j] = func(i2, j);
+          }
+          return res;
+        };
+        function retZero() {
+          return 0;
+        }
+        jStat4.zeros = function zeros(rows, cols) {
+          if (!isNumber(cols))
+            cols = rows;
+          return jStat4.create(rows, cols, retZero);
+        };
+        function retOne() {
+          return 1;
+        }
+        jStat4.ones = function ones(rows, cols) {
+          if (!isNumber(cols))
+            cols = rows;
+          return jStat4.create(rows, cols, retOne);
+        };
+        jStat4.rand = function rand(rows, cols) {
+          if (!isNumber(cols))
+            cols = rows;
+          return jStat4.create(rows, cols, jStat4._random_fn);
+        };
+        function retIdent(i2, j) {
+          return i2 === j ? 1 : 0;
+        }
+        jStat4.identity = function identity(rows, cols) {
+          if (!isNumber(cols))
+            cols = rows;
+          return jStat4.create(rows, cols, retIdent);
+        };
+        jStat4.symmetric = function symmetric(arr) {
+          var size = arr.length;
+          var row, col;
+          if (arr.length !== arr[0].length)
+            return false;
+          for (row = 0; row < size; row++) {
+            for (col = 0; col < size; col++)
+              if (arr[col][row] !== arr[row][col])
+                return false;
+          }
+          return true;
+        };
+        jStat4.clear = function clear(arr) {
+          return jStat4.alter(arr, retZero);
+        };
+        jStat4.seq = function seq(min, max2, length, func) {
+          if (!isFunction(func))
+            func = false;
+          var arr = [];
+          var hival = calcRdx(min, max2);
+          var step = (max2 * hival - min * hival) / ((length - 1) * hival);
+          var current = min;
+          var cnt;
+          for (cnt = 0; current <= max2 && cnt < length; cnt++, current = (min * hival + step * hival * cnt) / hival) {
+            arr.push(func ? func(current, cnt) : current);
+          }
+          return arr;
+        };
+        jStat4.arange = function arange(start, end, step) {
+          var rl = [];
+          var i2;
+          step = step || 1;
+          if (end === undefined2) {
+            end = start;
+            start = 0;
+          }
+          if (start === end || step === 0) {
+            return [];
+          }
+          if (start < end && step < 0) {
+            return [];
+          }
+          if (start > end && step > 0) {
+            return [];
+          }
+          if (step > 0) {
+            for (i2 = start; i2 < end; i2 += step) {
+              rl.push(i2);
+            }
+          } else {
+            for (i2 = start; i2 > end; i2 += step) {
+              rl.push(i2);
+            }
+          }
+          return rl;
+        };
+        jStat4.slice = /* @__PURE__ */ (function() {
+          function _slice(list, start, end, step) {
+            var i2;
+            var rl = [];
+            var length = list.length;
+            if (start === undefined2 && end === undefined2 && step === undefined2) {
+              return jStat4.copy(list);
+            }
+            start = start || 0;
+            end = end || list.length;
+            start = start >= 0 ? start : length + start;
+            end = end >= 0 ? end : length + end;
+            step = step || 1;
+            if (start === end || step === 0) {
+              return [];
+            }
+            if (start < end && step < 0) {
+              return [];
+            }
+            if (start > end && step > 0) {
+              return [];
+            }
+            if (step > 0) {
+              for (i2 = start; i2 < end; i2 += step) {
+                rl.push(list[i2]);
+              }
+            } else {
+              for (i2 = start; i2 > end; i2 += step) {
+                rl.push(list[i2]);
+              }
+            }
+            return rl;
+          }
+          function slice2(list, rcSlice) {
+            var colSlice, rowSlice;
+            rcSlice = rcSlice || {};
+            if (isNumber(rcSlice.row)) {
+              if (isNumber(rcSlice.col))
+                return list[rcSlice.row][rcSlice.col];
+              var row = jStat4.rowa(list, rcSlice.row);
+              colSlice = rcSlice.col || {};
+              return _slice(row, colSlice.start, colSlice.end, colSlice.step);
+            }
+            if (isNumber(rcSlice.col)) {
+              var col = jStat4.cola(list, rcSlice.col);
+              rowSlice = rcSlice.row || {};
+              return _slice(col, rowSlice.start, rowSlice.end, rowSlice.step);
+            }
+            rowSlice = rcSlice.row || {};
+            colSlice = rcSlice.col || {};
+            var rows = _slice(list, rowSlice.start, rowSlice.end, rowSlice.step);
+            return rows.map(function(row2) {
+              return _slice(row2, colSlice.start, colSlice.end, colSlice.step);
+            });
+          }
+          return slice2;
+        })();
+        jStat4.sliceAssign = function sliceAssign(A, rcSlice, B) {
+          var nl, ml;
+          if (isNumber(rcSlice.row)) {
+            if (isNumber(rcSlice.col))
+              return A[rcSlice.row][rcSlice.col] = B;
+            rcSlice.col = rcSlice.col || {};
+            rcSlice.col.start = rcSlice.col.start || 0;
+            rcSlice.col.end = rcSlice.col.end || A[0].length;
+            rcSlice.col.step = rcSlice.col.step || 1;
+            nl = jStat4.arange(
+              rcSlice.col.start,
+              Math2.min(A.length, rcSlice.col.end),
+              rcSlice.col.step
+            );
+            var m = rcSlice.row;
+            nl.forEach(function(n2, i2) {
+              A[m][n2] = B[i2];
+            });
+            return A;
+          }
+          if (isNumber(rcSlice.col)) {
+            rcSlice.row = rcSlice.row || {};
+            rcSlice.row.start = rcSlice.row.start || 0;
+            rcSlice.row.end = rcSlice.row.end || A.length;
+            rcSlice.row.step = rcSlice.row.step || 1;
+            ml = jStat4.arange(
+              rcSlice.row.start,
+              Math2.min(A[0].length, rcSlice.row.end),
+              rcSlice.row.step
+            );
+            var n = rcSlice.col;
+            ml.forEach(function(m2, j) {
+              A[m2][n] = B[j];
+            });
+            return A;
+          }
+          if (B[0].length === undefined2) {
+            B = [B];
+          }
+          rcSlice.row.start = rcSlice.row.start || 0;
+          rcSlice.row.end = rcSlice.row.end || A.length;
+          rcSlice.row.step = rcSlice.row.step || 1;
+          rcSlice.col.start = rcSlice.col.start || 0;
+          rcSlice.col.end = rcSlice.col.end || A[0].length;
+          rcSlice.col.step = rcSlice.col.step || 1;
+          ml = jStat4.arange(
+            rcSlice.row.start,
+            Math2.min(A.length, rcSlice.row.end),
+            rcSlice.row.step
+          );
+          nl = jStat4.arange(
+            rcSlice.col.start,
+            Math2.min(A[0].length, rcSlice.col.end),
+            rcSlice.col.step
+          );
+          ml.forEach(function(m2, i2) {
+            nl.forEach(function(n2, j) {
+              A[m2][n2] = B[i2][j];
+            });
+          });
+          return A;
+        };
+        jStat4.diagonal = function diagonal(diagArray) {
+          var mat = jStat4.zeros(diagArray.length, diagArray.length);
+          diagArray.forEach(function(t, i2) {
+            mat[i2][i2] = t;
+          });
+          return mat;
+        };
+        jStat4.copy = function copy(A) {
+          return A.map(function(row) {
+            if (isNumber(row))
+              return row;
+            return row.map(function(t) {
+              return t;
+            });
+          });
+        };
+        var jProto = jStat4.prototype;
+        jProto.length = 0;
+        jProto.push = Array.prototype.push;
+        jProto.sort = Array.prototype.sort;
+        jProto.splice = Array.prototype.splice;
+        jProto.slice = Array.prototype.slice;
+        jProto.toArray = function toArray() {
+          return this.length > 1 ? slice.call(this) : slice.call(this)[0];
+        };
+        jProto.map = function map(func, toAlter) {
+          return jStat4(jStat4.map(this, func, toAlter));
+        };
+        jProto.cumreduce = function cumreduce(func, toAlter) {
+          return jStat4(jStat4.cumreduce(this, func, toAlter));
+        };
+        jProto.alter = function alter(func) {
+          jStat4.alter(this, func);
+          return this;
+        };
+        (function(funcs) {
+          for (var i2 = 0; i2 < funcs.length; i2++) (function(passfunc) {
+            jProto[passfunc] = function(func) {
+              var self2 = this, results;
+              if (func) {
+                setTimeout(function() {
+                  func.call(self2, jProto[passfunc].call(self2));
+                });
+                return this;
+              }
+              results = jStat4[passfunc](this);
+              return isArray(results) ? jStat4(results) : results;
+            };
+          })(funcs[i2]);
+        })("transpose clear symmetric rows cols dimensions diag antidiag".split(" "));
+        (function(funcs) {
+          for (var i2 = 0; i2 < funcs.length; i2++) (function(passfunc) {
+            jProto[passfunc] = function(index, func) {
+              var self2 = this;
+              if (func) {
+                setTimeout(function() {
+                  func.call(self2, jProto[passfunc].call(self2, index));
+                });
+                return this;
+              }
+              return jStat4(jStat4[passfunc](this, index));
+            };
+          })(funcs[i2]);
+        })("row col".split(" "));
+        (function(funcs) {
+          for (var i2 = 0; i2 < funcs.length; i2++) (function(passfunc) {
+            jProto[passfunc] = function() {
+              return jStat4(jStat4[passfunc].apply(null, arguments));
+            };
+          })(funcs[i2]);
+        })("create zeros ones rand identity".split(" "));
+        return jStat4;
+      })(Math);
+      (function(jStat4, Math2) {
+        var isFunction = jStat4.utils.isFunction;
+        function ascNum(a, b) {
+          return a - b;
+        }
+        function clip2(arg, min, max2) {
+          return Math2.max(min, Math2.min(arg, max2));
+        }
+        jStat4.sum = function sum(arr) {
+          var sum2 = 0;
+          var i2 = arr.length;
+          while (--i2 >= 0)
+            sum2 += arr[i2];
+          return sum2;
+        };
+        jStat4.sumsqrd = function sumsqrd(arr) {
+          var sum = 0;
+          var i2 = arr.length;
+          while (--i2 >= 0)
+            sum += arr[i2] * arr[i2];
+          return sum;
+        };
+        jStat4.sumsqerr = function sumsqerr(arr) {
+          var mean2 = jStat4.mean(arr);
+          var sum = 0;
+          var i2 = arr.length;
+          var tmp;
+          while (--i2 >= 0) {
+            tmp = arr[i2] - mean2;
+            sum += tmp * tmp;
+          }
+          return sum;
+        };
+        jStat4.sumrow = function sumrow(arr) {
+          var sum = 0;
+          var i2 = arr.length;
+          while (--i2 >= 0)
+            sum += arr[i2];
+          return sum;
+        };
+        jStat4.product = function product(arr) {
+          var prod = 1;
+          var i2 = arr.length;
+          while (--i2 >= 0)
+            prod *= arr[i2];
+          return prod;
+        };
+        jStat4.min = function min(arr) {
+          var low = arr[0];
+          var i2 = 0;
+          while (++i2 < arr.length)
+            if (arr[i2] < low)
+              low = arr[i2];
+          return low;
+        };
+        jStat4.max = function max2(arr) {
+          var high = arr[0];
+          var i2 = 0;
+          while (++i2 < arr.length)
+            if (arr[i2] > high)
+              high = arr[i2];
+          return high;
+        };
+        jStat4.unique = function unique(arr) {
+          var hash = {}, _arr = [];
+          for (var i2 = 0; i2 < arr.length; i2++) {
+            if (!hash[arr[i2]]) {
+              hash[arr[i2]] = true;
+              _arr.push(arr[i2]);
+            }
+          }
+          return _arr;
+        };
+        jStat4.mean = function mean2(arr) {
+          return jStat4.sum(arr) / arr.length;
+        };
+        jStat4.meansqerr = function meansqerr(arr) {
+          return jStat4.sumsqerr(arr) / arr.length;
+        };
+        jStat4.geomean = function geomean(arr) {
+          var logs = arr.map(Math2.log);
+          var meanOfLogs = jStat4.mean(logs);
+          return Math2.exp(meanOfLogs);
+        };
+        jStat4.median = function median(arr) {
+          var arrlen = arr.length;
+          var _arr = arr.slice().sort(ascNum);
+          return !(arrlen & 1) ? (_arr[arrlen / 2 - 1] + _arr[arrlen / 2]) / 2 : _arr[arrlen / 2 | 0];
+        };
+        jStat4.cumsum = function cumsum(arr) {
+          return jStat4.cumreduce(arr, function(a, b) {
+            return a + b;
+          });
+        };
+        jStat4.cumprod = function cumprod(arr) {
+          return jStat4.cumreduce(arr, function(a, b) {
+            return a * b;
+          });
+        };
+        jStat4.diff = function diff(arr) {
+          var diffs = [];
+          var arrLen = arr.length;
+          var i2;
+          for (i2 = 1; i2 < arrLen; i2++)
+            diffs.push(arr[i2] - arr[i2 - 1]);
+          return diffs;
+        };
+        jStat4.rank = function(arr) {
+          var i2;
+          var distinctNumbers = [];
+          var numberCounts = {};
+          for (i2 = 0; i2 < arr.length; i2++) {
+            var number2 = arr[i2];
+            if (numberCounts[number2]) {
+              numberCounts[number2]++;
+            } else {
+              numberCounts[number2] = 1;
+              distinctNumbers.push(number2);
+            }
+          }
+          var sortedDistinctNumbers = distinctNumbers.sort(ascNum);
+          var numberRanks = {};
+          var currentRank = 1;
+          for (i2 = 0; i2 < sortedDistinctNumbers.length; i2++) {
+            var number2 = sortedDistinctNumbers[i2];
+            var count2 = numberCounts[number2];
+            var first = currentRank;
+            var last = currentRank + count2 - 1;
+            var rank = (first + last) / 2;
+            numberRanks[number2] = rank;
+            currentRank += count2;
+          }
+          return arr.map(function(number3) {
+            return numberRanks[number3];
+          });
+        };
+        jStat4.mode = function mode(arr) {
+          var arrLen = arr.length;
+          var _arr = arr.slice().sort(ascNum);
+          var count2 = 1;
+          var maxCount = 0;
+          var numMaxCount = 0;
+          var mode_arr = [];
+          var i2;
+          for (i2 = 0; i2 < arrLen; i2++) {
+            if (_arr[i2] === _arr[i2 + 1]) {
+              count2++;
+            } else {
+              if (count2 > maxCount) {
+                mode_arr = [_arr[i2]];
+                maxCount = count2;
+                numMaxCount = 0;
+              } else if (count2 === maxCount) {
+                mode_arr.push(_arr[i2]);
+                numMaxCount++;
+              }
+              count2 = 1;
+            }
+          }
+          return numMaxCount === 0 ? mode_arr[0] : mode_arr;
+        };
+        jStat4.range = function range(arr) {
+          return jStat4.max(arr) - jStat4.min(arr);
+        };
+        jStat4.variance = function variance(arr, flag) {
+          return jStat4.sumsqerr(arr) / (arr.length - (flag ? 1 : 0));
+        };
+        jStat4.pooledvariance = function pooledvariance(arr) {
+          var sumsqerr = arr.reduce(function(a, samples) {
+            return a + jStat4.sumsqerr(samples);
+          }, 0);
+          var count2 = arr.reduce(function(a, samples) {
+            return a + samples.length;
+          }, 0);
+          return sumsqerr / (count2 - arr.length);
+        };
+        jStat4.deviation = function(arr) {
+          var mean2 = jStat4.mean(arr);
+          var arrlen = arr.length;
+          var dev = new Array(arrlen);
+          for (var i2 = 0; i2 < arrlen; i2++) {
+            dev[i2] = arr[i2] - mean2;
+          }
+          return dev;
+        };
+        jStat4.stdev = function stdev(arr, flag) {
+          return Math2.sqrt(jStat4.variance(arr, flag));
+        };
+        jStat4.pooledstdev = function pooledstdev(arr) {
+          return Math2.sqrt(jStat4.pooledvariance(arr));
+        };
+        jStat4.meandev = function meandev(arr) {
+          var mean2 = jStat4.mean(arr);
+          var a = [];
+          for (var i2 = arr.length - 1; i2 >= 0; i2--) {
+            a.push(Math2.abs(arr[i2] - mean2));
+          }
+          return jStat4.mean(a);
+        };
+        jStat4.meddev = function meddev(arr) {
+          var median = jStat4.median(arr);
+          var a = [];
+          for (var i2 = arr.length - 1; i2 >= 0; i2--) {
+            a.push(Math2.abs(arr[i2] - median));
+          }
+          return jStat4.median(a);
+        };
+        jStat4.coeffvar = function coeffvar(arr) {
+          return jStat4.stdev(arr) / jStat4.mean(arr);
+        };
+        jStat4.quartiles = function quartiles(arr) {
+          var arrlen = arr.length;
+          var _arr = arr.slice().sort(ascNum);
+          return [
+            _arr[Math2.round(arrlen / 4) - 1],
+            _arr[Math2.round(arrlen / 2) - 1],
+            _arr[Math2.round(arrlen * 3 / 4) - 1]
+          ];
+        };
+        jStat4.quantiles = function quantiles(arr, quantilesArray, alphap, betap) {
+          var sortedArray = arr.slice().sort(ascNum);
+          var quantileVals = [quantilesArray.length];
+          var n = arr.length;
+          var i2, p, m, aleph, k, gamma;
+          if (typeof alphap === "undefined")
+            alphap = 3 / 8;
+          if (typeof betap === "undefined")
+            betap = 3 / 8;
+          for (i2 = 0; i2 < quantilesArray.length; i2++) {
+            p = quantilesArray[i2];
+            m = alphap + p * (1 - alphap - betap);
+            aleph = n * p + m;
+            k = Math2.floor(clip2(aleph, 1, n - 1));
+            gamma = clip2(aleph - k, 0, 1);
+            quantileVals[i2] = (1 - gamma) * sortedArray[k - 1] + gamma * sortedArray[k];
+          }
+          return quantileVals;
+        };
+        jStat4.percentile = function percentile(arr, k, exclusive) {
+          var _arr = arr.slice().sort(ascNum);
+          var realIndex = k * (_arr.length + (exclusive ? 1 : -1)) + (exclusive ? 0 : 1);
+          var index = parseInt(realIndex);
+          var frac = realIndex - index;
+          if (index + 1 < _arr.length) {
+            return _arr[index - 1] + frac * (_arr[index] - _arr[index - 1]);
+          } else {
+            return _arr[index - 1];
+          }
+        };
+        jStat4.percentileOfScore = function percentileOfScore(arr, score, kind) {
+          var counter = 0;
+          var len = arr.length;
+          var strict = false;
+          var value2, i2;
+          if (kind === "strict")
+            strict = true;
+          for (i2 = 0; i2 < len; i2++) {
+            value2 = arr[i2];
+            if (strict && value2 < score || !strict && value2 <= score) {
+              counter++;
+            }
+          }
+          return counter / len;
+        };
+        jStat4.histogram = function histogram(arr, binCnt) {
+          binCnt = binCnt || 4;
+          var first = jStat4.min(arr);
+          var binWidth = (jStat4.max(arr) - first) / binCnt;
+          var len = arr.length;
+          var bins = [];
+          var i2;
+          for (i2 = 0; i2 < binCnt; i2++)
+            bins[i2] = 0;
+          for (i2 = 0; i2 < len; i2++)
+            bins[Math2.min(Math2.floor((arr[i2] - first) / binWidth), binCnt - 1)] += 1;
+          return bins;
+        };
+        jStat4.covariance = function covariance(arr1, arr2) {
+          var u = jStat4.mean(arr1);
+          var v = jStat4.mean(arr2);
+          var arr1Len = arr1.length;
+          var sq_dev = new Array(arr1Len);
+          var i2;
+          for (i2 = 0; i2 < arr1Len; i2++)
+            sq_dev[i2] = (arr1[i2] - u) * (arr2[i2] - v);
+          return jStat4.sum(sq_dev) / (arr1Len - 1);
+        };
+        jStat4.corrcoeff = function corrcoeff(arr1, arr2) {
+          return jStat4.covariance(arr1, arr2) / jStat4.stdev(arr1, 1) / jStat4.stdev(arr2, 1);
+        };
+        jStat4.spearmancoeff = function(arr1, arr2) {
+          arr1 = jStat4.rank(arr1);
+          arr2 = jStat4.rank(arr2);
+          return jStat4.corrcoeff(arr1, arr2);
+        };
+        jStat4.stanMoment = function stanMoment(arr, n) {
+          var mu = jStat4.mean(arr);
+          var sigma = jStat4.stdev(arr);
+          var len = arr.length;
+          var skewSum = 0;
+          for (var i2 = 0; i2 < len; i2++)
+            skewSum += Math2.pow((arr[i2] - mu) / sigma, n);
+          return skewSum / arr.length;
+        };
+        jStat4.skewness = function skewness(arr) {
+          return jStat4.stanMoment(arr, 3);
+        };
+        jStat4.kurtosis = function kurtosis(arr) {
+          return jStat4.stanMoment(arr, 4) - 3;
+        };
+        var jProto = jStat4.prototype;
+        (function(funcs) {
+          for (var i2 = 0; i2 < funcs.length; i2++) (function(passfunc) {
+            jProto[passfunc] = function(fullbool, func) {
+              var arr = [];
+              var i3 = 0;
+              var tmpthis = this;
+              if (isFunction(fullbool)) {
+                func = fullbool;
+                fullbool = false;
+              }
+              if (func) {
+                setTimeout(function() {
+                  func.call(tmpthis, jProto[passfunc].call(tmpthis, fullbool));
+                });
+                return this;
+              }
+              if (this.length > 1) {
+                tmpthis = fullbool === true ? this : this.transpose();
+                for (; i3 < tmpthis.length; i3++)
+                  arr[i3] = jStat4[passfunc](tmpthis[i3]);
+                return arr;
+              }
+              return jStat4[passfunc](this[0], fullbool);
+            };
+          })(funcs[i2]);
+        })("cumsum cumprod".split(" "));
+        (function(funcs) {
+          for (var i2 = 0; i2 < funcs.length; i2++) (function(passfunc) {
+            jProto[passfunc] = function(fullbool, func) {
+              var arr = [];
+              var i3 = 0;
+              var tmpthis = this;
+              if (isFunction(fullbool)) {
+                func = fullbool;
+                fullbool = false;
+              }
+              if (func) {
+                setTimeout(function() {
+                  func.call(tmpthis, jProto[passfunc].call(tmpthis, fullbool));
+                });
+                return this;
+              }
+              if (this.length > 1) {
+                if (passfunc !== "sumrow")
+                  tmpthis = fullbool === true ? this : this.transpose();
+                for (; i3 < tmpthis.length; i3++)
+                  arr[i3] = jStat4[passfunc](tmpthis[i3]);
+                return fullbool === true ? jStat4[passfunc](jStat4.utils.toVector(arr)) : arr;
+              }
+              return jStat4[passfunc](this[0], fullbool);
+            };
+          })(funcs[i2]);
+        })("sum sumsqrd sumsqerr sumrow product min max unique mean meansqerr geomean median diff rank mode range variance deviation stdev meandev meddev coeffvar quartiles histogram skewness kurtosis".split(" "));
+        (function(funcs) {
+          for (var i2 = 0; i2 < funcs.length; i2++) (function(passfunc) {
+            jProto[passfunc] = function() {
+              var arr = [];
+              var i3 = 0;
+              var tmpthis = this;
+              var args = Array.prototype.slice.call(arguments);
+              var callbackFunction;
+              if (isFunction(args[args.length - 1])) {
+                callbackFunction = args[args.length - 1];
+                var argsToPass = args.slice(0, args.length - 1);
+                setTimeout(function() {
+                  callbackFunction.call(
+                    tmpthis,
+                    jProto[passfunc].apply(tmpthis, argsToPass)
+                  );
+                });
+                return this;
+              } else {
+                callbackFunction = void 0;
+                var curriedFunction = function curriedFunction2(vector) {
+                  return jStat4[passfunc].apply(tmpthis, [vector].concat(args));
+                };
+              }
+              if (this.length > 1) {
+                tmpthis = tmpthis.transpose();
+                for (; i3 < tmpthis.length; i3++)
+                  arr[i3] = curriedFunction(tmpthis[i3]);
+                return arr;
+              }
+              return curriedFunction(this[0]);
+            };
+          })(funcs[i2]);
+        })("quantiles percentileOfScore".split(" "));
+      })(jStat3, Math);
+      (function(jStat4, Math2) {
+        jStat4.gammaln = function gammaln(x2) {
+          var j = 0;
+          var cof = [
+            76.18009172947146,
+            -86.50532032941678,
+            24.01409824083091,
+            -1.231739572450155,
+            0.001208650973866179,
+            -5395239384953e-18
+          ];
+          var ser = 1.000000000190015;
+          var xx, y, tmp;
+          tmp = (y = xx = x2) + 5.5;
+          tmp -= (xx + 0.5) * Math2.log(tmp);
+          for (; j < 6; j++)
+            ser += cof[j] / ++y;
+          return Math2.log(2.5066282746310007 * ser / xx) - tmp;
+        };
+        jStat4.loggam = function loggam(x2) {
+          var x0, x22, xp, gl, gl0;
+          var k, n;
+          var a = [
+            0.08333333333333333,
+            -0.002777777777777778,
+            7936507936507937e-19,
+            -5952380952380952e-19,
+            8417508417508418e-19,
+            -0.001917526917526918,
+            0.00641025641025641,
+            -0.02955065359477124,
+            0.1796443723688307,
+            -1.3924322169059
+          ];
+          x0 = x2;
+          n = 0;
+          if (x2 == 1 || x2 == 2) {
+            return 0;
+          }
+          if (x2 <= 7) {
+            n = Math2.floor(7 - x2);
+            x0 = x2 + n;
+          }
+          x22 = 1 / (x0 * x0);
+          xp = 2 * Math2.PI;
+          gl0 = a[9];
+          for (k = 8; k >= 0; k--) {
+            gl0 *= x22;
+            gl0 += a[k];
+          }
+          gl = gl0 / x0 + 0.5 * Math2.log(xp) + (x0 - 0.5) * Math2.log(x0) - x0;
+          if (x2 <= 7) {
+            for (k = 1; k <= n; k++) {
+              gl -= Math2.log(x0 - 1);
+              x0 -= 1;
+            }
+          }
+          return gl;
+        };
+        jStat4.gammafn = function gammafn(x2) {
+          var p = [
+            -1.716185138865495,
+            24.76565080557592,
+            -379.80425647094563,
+            629.3311553128184,
+            866.9662027904133,
+            -31451.272968848367,
+            -36144.413418691176,
+            66456.14382024054
+          ];
+          var q = [
+            -30.8402300119739,
+            315.35062697960416,
+            -1015.1563674902192,
+            -3107.771671572311,
+            22538.11842098015,
+            4755.846277527881,
+            -134659.9598649693,
+            -115132.2596755535
+          ];
+          var fact = false;
+          var n = 0;
+          var xden = 0;
+          var xnum = 0;
+          var y = x2;
+          var i2, z, yi, res;
+          if (x2 > 171.6243769536076) {
+            return Infinity;
+          }
+          if (y <= 0) {
+            res = y % 1 + 36e-17;
+            if (res) {
+              fact = (!(y & 1) ? 1 : -1) * Math2.PI / Math2.sin(Math2.PI * res);
+              y = 1 - y;
+            } else {
+              return Infinity;
+            }
+          }
+          yi = y;
+          if (y < 1) {
+            z = y++;
+          } else {
+            z = (y -= n = (y | 0) - 1) - 1;
+          }
+          for (i2 = 0; i2 < 8; ++i2) {
+            xnum = (xnum + p[i2]) * z;
+            xden = xden * z + q[i2];
+          }
+          res = xnum / xden + 1;
+          if (yi < y) {
+            res /= yi;
+          } else if (yi > y) {
+            for (i2 = 0; i2 < n; ++i2) {
+              res *= y;
+              y++;
+            }
+          }
+          if (fact) {
+            res = fact / res;
+          }
+          return res;
+        };
+        jStat4.gammap = function gammap(a, x2) {
+          return jStat4.lowRegGamma(a, x2) * jStat4.gammafn(a);
+        };
+        jStat4.lowRegGamma = function lowRegGamma(a, x2) {
+          var aln = jStat4.gammaln(a);
+          var ap = a;
+          var sum = 1 / a;
+          var del = sum;
+          var b = x2 + 1 - a;
+          var c = 1 / 1e-30;
+          var d = 1 / b;
+          var h = d;
+          var i2 = 1;
+          var ITMAX = -~(Math2.log(a >= 1 ? a : 1 / a) * 8.5 + a * 0.4 + 17);
+          var an;
+          if (x2 < 0 || a <= 0) {
+            return NaN;
+          } else if (x2 < a + 1) {
+            for (; i2 <= ITMAX; i2++) {
+              sum += del *= x2 / ++ap;
+            }
+            return sum * Math2.exp(-x2 + a * Math2.log(x2) - aln);
+          }
+          for (; i2 <= ITMAX; i2++) {
+            an = -i2 * (i2 - a);
+            b += 2;
+            d = an * d + b;
+            c = b + an / c;
+            d = 1 / d;
+            h *= d * c;
+          }
+          return 1 - h * Math2.exp(-x2 + a * Math2.log(x2) - aln);
+        };
+        jStat4.factorialln = function factorialln(n) {
+          return n < 0 ? NaN : jStat4.gammaln(n + 1);
+        };
+        jStat4.factorial = function factorial(n) {
+          return n < 0 ? NaN : jStat4.gammafn(n + 1);
+        };
+        jStat4.combination = function combination(n, m) {
+          return n > 170 || m > 170 ? Math2.exp(jStat4.combinationln(n, m)) : jStat4.factorial(n) / jStat4.factorial(m) / jStat4.factorial(n - m);
+        };
+        jStat4.combinationln = function combinationln(n, m) {
+          return jStat4.factorialln(n) - jStat4.factorialln(m) - jStat4.factorialln(n - m);
+        };
+        jStat4.permutation = function permutation(n, m) {
+          return jStat4.factorial(n) / jStat4.factorial(n - m);
+        };
+        jStat4.betafn = function betafn(x2, y) {
+          if (x2 <= 0 || y <= 0)
+            return void 0;
+          return x2 + y > 170 ? Math2.exp(jStat4.betaln(x2, y)) : jStat4.gammafn(x2) * jStat4.gammafn(y) / jStat4.gammafn(x2 + y);
+        };
+        jStat4.betaln = function betaln(x2, y) {
+          return jStat4.gammaln(x2) + jStat4.gammaln(y) - jStat4.gammaln(x2 + y);
+        };
+        jStat4.betacf = function betacf(x2, a, b) {
+          var fpmin = 1e-30;
+          var m = 1;
+          var qab = a + b;
+          var qap = a + 1;
+          var qam = a - 1;
+          var c = 1;
+          var d = 1 - qab * x2 / qap;
+          var m2, aa, del, h;
+          if (Math2.abs(d) < fpmin)
+            d = fpmin;
+          d = 1 / d;
+          h = d;
+          for (; m <= 100; m++) {
+            m2 = 2 * m;
+            aa = m * (b - m) * x2 / ((qam + m2) * (a + m2));
+            d = 1 + aa * d;
+            if (Math2.abs(d) < fpmin)
+              d = fpmin;
+            c = 1 + aa / c;
+            if (Math2.abs(c) < fpmin)
+              c = fpmin;
+            d = 1 / d;
+            h *= d * c;
+            aa = -(a + m) * (qab + m) * x2 / ((a + m2) * (qap + m2));
+            d = 1 + aa * d;
+            if (Math2.abs(d) < fpmin)
+              d = fpmin;
+            c = 1 + aa / c;
+            if (Math2.abs(c) < fpmin)
+              c = fpmin;
+            d = 1 / d;
+            del = d * c;
+            h *= del;
+            if (Math2.abs(del - 1) < 3e-7)
+              break;
+          }
+          return h;
+        };
+        jStat4.gammapinv = function gammapinv(p, a) {
+          var j = 0;
+          var a1 = a - 1;
+          var EPS = 1e-8;
+          var gln = jStat4.gammaln(a);
+          var x2, err2, t, u, pp, lna1, afac;
+          if (p >= 1)
+            return Math2.max(100, a + 100 * Math2.sqrt(a));
+          if (p <= 0)
+            return 0;
+          if (a > 1) {
+            lna1 = Math2.log(a1);
+            afac = Math2.exp(a1 * (lna1 - 1) - gln);
+            pp = p < 0.5 ? p : 1 - p;
+            t = Math2.sqrt(-2 * Math2.log(pp));
+            x2 = (2.30753 + t * 0.27061) / (1 + t * (0.99229 + t * 0.04481)) - t;
+            if (p < 0.5)
+              x2 = -x2;
+            x2 = Math2.max(
+              1e-3,
+              a * Math2.pow(1 - 1 / (9 * a) - x2 / (3 * Math2.sqrt(a)), 3)
+            );
+          } else {
+            t = 1 - a * (0.253 + a * 0.12);
+            if (p < t)
+              x2 = Math2.pow(p / t, 1 / a);
+            else
+              x2 = 1 - Math2.log(1 - (p - t) / (1 - t));
+          }
+          for (; j < 12; j++) {
+            if (x2 <= 0)
+              return 0;
+            err2 = jStat4.lowRegGamma(a, x2) - p;
+            if (a > 1)
+              t = afac * Math2.exp(-(x2 - a1) + a1 * (Math2.log(x2) - lna1));
+            else
+              t = Math2.exp(-x2 + a1 * Math2.log(x2) - gln);
+            u = err2 / t;
+            x2 -= t = u / (1 - 0.5 * Math2.min(1, u * ((a - 1) / x2 - 1)));
+            if (x2 <= 0)
+              x2 = 0.5 * (x2 + t);
+            if (Math2.abs(t) < EPS * x2)
+              break;
+          }
+          return x2;
+        };
+        jStat4.erf = function erf(x2) {
+          var cof = [
+            -1.3026537197817094,
+            0.6419697923564902,
+            0.019476473204185836,
+            -0.00956151478680863,
+            -946595344482036e-18,
+            366839497852761e-18,
+            42523324806907e-18,
+            -20278578112534e-18,
+            -1624290004647e-18,
+            130365583558e-17,
+            15626441722e-18,
+            -85238095915e-18,
+            6529054439e-18,
+            5059343495e-18,
+            -991364156e-18,
+            -227365122e-18,
+            96467911e-18,
+            2394038e-18,
+            -6886027e-18,
+            894487e-18,
+            313092e-18,
+            -112708e-18,
+            381e-18,
+            7106e-18,
+            -1523e-18,
+            -94e-18,
+            121e-18,
+            -28e-18
+          ];
+          var j = cof.length - 1;
+          var isneg = false;
+          var d = 0;
+          var dd = 0;
+          var t, ty, tmp, res;
+          if (x2 < 0) {
+            x2 = -x2;
+            isneg = true;
+          }
+          t = 2 / (2 + x2);
+          ty = 4 * t - 2;
+          for (; j > 0; j--) {
+            tmp = d;
+            d = ty * d - dd + cof[j];
+            dd = tmp;
+          }
+          res = t * Math2.exp(-x2 * x2 + 0.5 * (cof[0] + ty * d) - dd);
+          return isneg ? res - 1 : 1 - res;
+        };
+        jStat4.erfc = function erfc(x2) {
+          return 1 - jStat4.erf(x2);
+        };
+        jStat4.erfcinv = function erfcinv(p) {
+          var j = 0;
+          var x2, err2, t, pp;
+          if (p >= 2)
+            return -100;
+          if (p <= 0)
+            return 100;
+          pp = p < 1 ? p : 2 - p;
+          t = Math2.sqrt(-2 * Math2.log(pp / 2));
+          x2 = -0.70711 * ((2.30753 + t * 0.27061) / (1 + t * (0.99229 + t * 0.04481)) - t);
+          for (; j < 2; j++) {
+            err2 = jStat4.erfc(x2) - pp;
+            x2 += err2 / (1.1283791670955126 * Math2.exp(-x2 * x2) - x2 * err2);
+          }
+          return p < 1 ? x2 : -x2;
+        };
+        jStat4.ibetainv = function ibetainv(p, a, b) {
+          var EPS = 1e-8;
+          var a1 = a - 1;
+          var b1 = b - 1;
+          var j = 0;
+          var lna, lnb, pp, t, u, err2, x2, al, h, w, afac;
+          if (p <= 0)
+            return 0;
+          if (p >= 1)
+            return 1;
+          if (a >= 1 && b >= 1) {
+            pp = p < 0.5 ? p : 1 - p;
+            t = Math2.sqrt(-2 * Math2.log(pp));
+            x2 = (2.30753 + t * 0.27061) / (1 + t * (0.99229 + t * 0.04481)) - t;
+            if (p < 0.5)
+              x2 = -x2;
+            al = (x2 * x2 - 3) / 6;
+            h = 2 / (1 / (2 * a - 1) + 1 / (2 * b - 1));
+            w = x2 * Math2.sqrt(al + h) / h - (1 / (2 * b - 1) - 1 / (2 * a - 1)) * (al + 5 / 6 - 2 / (3 * h));
+            x2 = a / (a + b * Math2.exp(2 * w));
+          } else {
+            lna = Math2.log(a / (a + b));
+            lnb = Math2.log(b / (a + b));
+            t = Math2.exp(a * lna) / a;
+            u = Math2.exp(b * lnb) / b;
+            w = t + u;
+            if (p < t / w)
+              x2 = Math2.pow(a * w * p, 1 / a);
+            else
+              x2 = 1 - Math2.pow(b * w * (1 - p), 1 / b);
+          }
+          afac = -jStat4.gammaln(a) - jStat4.gammaln(b) + jStat4.gammaln(a + b);
+          for (; j < 10; j++) {
+            if (x2 === 0 || x2 === 1)
+              return x2;
+            err2 = jStat4.ibeta(x2, a, b) - p;
+            t = Math2.exp(a1 * Math2.log(x2) + b1 * Math2.log(1 - x2) + afac);
+            u = err2 / t;
+            x2 -= t = u / (1 - 0.5 * Math2.min(1, u * (a1 / x2 - b1 / (1 - x2))));
+            if (x2 <= 0)
+              x2 = 0.5 * (x2 + t);
+            if (x2 >= 1)
+              x2 = 0.5 * (x2 + t + 1);
+            if (Math2.abs(t) < EPS * x2 && j > 0)
+              break;
+          }
+          return x2;
+        };
+        jStat4.ibeta = function ibeta2(x2, a, b) {
+          var bt = x2 === 0 || x2 === 1 ? 0 : Math2.exp(jStat4.gammaln(a + b) - jStat4.gammaln(a) - jStat4.gammaln(b) + a * Math2.log(x2) + b * Math2.log(1 - x2));
+          if (x2 < 0 || x2 > 1)
+            return false;
+          if (x2 < (a + 1) / (a + b + 2))
+            return bt * jStat4.betacf(x2, a, b) / a;
+          return 1 - bt * jStat4.betacf(1 - x2, b, a) / b;
+        };
+        jStat4.randn = function randn(n, m) {
+          var u, v, x2, y, q;
+          if (!m)
+            m = n;
+          if (n)
+            return jStat4.create(n, m, function() {
+              return jStat4.randn();
+            });
+          do {
+            u = jStat4._random_fn();
+            v = 1.7156 * (jStat4._random_fn() - 0.5);
+            x2 = u - 0.449871;
+            y = Math2.abs(v) + 0.386595;
+            q = x2 * x2 + y * (0.196 * y - 0.25472 * x2);
+          } while (q > 0.27597 && (q > 0.27846 || v * v > -4 * Math2.log(u) * u * u));
+          return v / u;
+        };
+        jStat4.randg = function randg(shape, n, m) {
+          var oalph = shape;
+          var a1, a2, u, v, x2, mat;
+          if (!m)
+            m = n;
+          if (!shape)
+            shape = 1;
+          if (n) {
+            mat = jStat4.zeros(n, m);
+            mat.alter(function() {
+              return jStat4.randg(shape);
+            });
+            return mat;
+          }
+          if (shape < 1)
+            shape += 1;
+          a1 = shape - 1 / 3;
+          a2 = 1 / Math2.sqrt(9 * a1);
+          do {
+            do {
+              x2 = jStat4.randn();
+              v = 1 + a2 * x2;
+            } while (v <= 0);
+            v = v * v * v;
+            u = jStat4._random_fn();
+          } while (u > 1 - 0.331 * Math2.pow(x2, 4) && Math2.log(u) > 0.5 * x2 * x2 + a1 * (1 - v + Math2.log(v)));
+          if (shape == oalph)
+            return a1 * v;
+          do {
+            u = jStat4._random_fn();
+          } while (u === 0);
+          return Math2.pow(u, 1 / oalph) * a1 * v;
+        };
+        (function(funcs) {
+          for (var i2 = 0; i2 < funcs.length; i2++) (function(passfunc) {
+            jStat4.fn[passfunc] = function() {
+              return jStat4(
+                jStat4.map(this, function(value2) {
+                  return jStat4[passfunc](value2);
+                })
+              );
+            };
+          })(funcs[i2]);
+        })("gammaln gammafn factorial factorialln".split(" "));
+        (function(funcs) {
+          for (var i2 = 0; i2 < funcs.length; i2++) (function(passfunc) {
+            jStat4.fn[passfunc] = function() {
+              return jStat4(jStat4[passfunc].apply(null, arguments));
+            };
+          })(funcs[i2]);
+        })("randn".split(" "));
+      })(jStat3, Math);
+      (function(jStat4, Math2) {
+        (function(list) {
+          for (var i2 = 0; i2 < list.length; i2++) (function(func) {
+            jStat4[func] = function f(a, b, c) {
+              if (!(this instanceof f))
+                return new f(a, b, c);
+              this._a = a;
+              this._b = b;
+              this._c = c;
+              return this;
+            };
+            jStat4.fn[func] = function(a, b, c) {
+              var newthis = jStat4[func](a, b, c);
+              newthis.data = this;
+              return newthis;
+            };
+            jStat4[func].prototype.sample = function(arr) {
+              var a = this._a;
+              var b = this._b;
+              var c = this._c;
+              if (arr)
+                return jStat4.alter(arr, function() {
+                  return jStat4[func].sample(a, b, c);
+                });
+              else
+                return jStat4[func].sample(a, b, c);
+            };
+            (function(vals) {
+              for (var i3 = 0; i3 < vals.length; i3++) (function(fnfunc) {
+                jStat4[func].prototype[fnfunc] = function(x2) {
+                  var a = this._a;
+                  var b = this._b;
+                  var c = this._c;
+                  if (!x2 && x2 !== 0)
+                    x2 = this.data;
+                  if (typeof x2 !== "number") {
+                    return jStat4.fn.map.call(x2, function(x3) {
+                      return jStat4[func][fnfunc](x3, a, b, c);
+                    });
+                  }
+                  return jStat4[func][fnfunc](x2, a, b, c);
+                };
+              })(vals[i3]);
+            })("pdf cdf inv".split(" "));
+            (function(vals) {
+              for (var i3 = 0; i3 < vals.length; i3++) (function(fnfunc) {
+                jStat4[func].prototype[fnfunc] = function() {
+                  return jStat4[func][fnfunc](this._a, this._b, this._c);
+                };
+              })(vals[i3]);
+            })("mean median mode variance".split(" "));
+          })(list[i2]);
+        })("beta centralF cauchy chisquare exponential gamma invgamma kumaraswamy laplace lognormal noncentralt normal pareto studentt weibull uniform binomial negbin hypgeom poisson triangular tukey arcsine".split(" "));
+        jStat4.extend(jStat4.beta, {
+          pdf: function pdf(x2, alpha, beta) {
+            if (x2 > 1 || x2 < 0)
+              return 0;
+            if (alpha == 1 && beta == 1)
+              return 1;
+            if (alpha < 512 && beta < 512) {
+              return Math2.pow(x2, alpha - 1) * Math2.pow(1 - x2, beta - 1) / jStat4.betafn(alpha, beta);
+            } else {
+              return Math2.exp((alpha - 1) * Math2.log(x2) + (beta - 1) * Math2.log(1 - x2) - jStat4.betaln(alpha, beta));
+            }
+          },
+          cdf: function cdf(x2, alpha, beta) {
+            return x2 > 1 || x2 < 0 ? (x2 > 1) * 1 : jStat4.ibeta(x2, alpha, beta);
+          },
+          inv: function inv(x2, alpha, beta) {
+            return jStat4.ibetainv(x2, alpha, beta);
+          },
+          mean: function mean2(alpha, beta) {
+            return alpha / (alpha + beta);
+          },
+          median: function median(alpha, beta) {
+            return jStat4.ibetainv(0.5, alpha, beta);
+          },
+          mode: function mode(alpha, beta) {
+            return (alpha - 1) / (alpha + beta - 2);
+          },
+          // return a random sample
+          sample: function sample(alpha, beta) {
+            var u = jStat4.randg(alpha);
+            return u / (u + jStat4.randg(beta));
+          },
+          variance: function variance(alpha, beta) {
+            return alpha * beta / (Math2.pow(alpha + beta, 2) * (alpha + beta + 1));
+          }
+        });
+        jStat4.extend(jStat4.centralF, {
+          // This implementation of the pdf function avoids float overflow
+          // See the way that R calculates this value:
+          // https://svn.r-project.org/R/trunk/src/nmath/df.c
+          pdf: function pdf(x2, df1, df2) {
+            var p, q, f;
+            if (x2 < 0)
+              return 0;
+            if (df1 <= 2) {
+              if (x2 === 0 && df1 < 2) {
+                return Infinity;
+              }
+              if (x2 === 0 && df1 === 2) {
+                return 1;
+              }
+              return 1 / jStat4.betafn(df1 / 2, df2 / 2) * Math2.pow(df1 / df2, df1 / 2) * Math2.pow(x2, df1 / 2 - 1) * Math2.pow(1 + df1 / df2 * x2, -(df1 + df2) / 2);
+            }
+            p = df1 * x2 / (df2 + x2 * df1);
+            q = df2 / (df2 + x2 * df1);
+            f = df1 * q / 2;
+            return f * jStat4.binomial.pdf((df1 - 2) / 2, (df1 + df2 - 2) / 2, p);
+          },
+          cdf: function cdf(x2, df1, df2) {
+            if (x2 < 0)
+              return 0;
+            return jStat4.ibeta(df1 * x2 / (df1 * x2 + df2), df1 / 2, df2 / 2);
+          },
+          inv: function inv(x2, df1, df2) {
+            return df2 / (df1 * (1 / jStat4.ibetainv(x2, df1 / 2, df2 / 2) - 1));
+          },
+          mean: function mean2(df1, df2) {
+            return df2 > 2 ? df2 / (df2 - 2) : void 0;
+          },
+          mode: function mode(df1, df2) {
+            return df1 > 2 ? df2 * (df1 - 2) / (df1 * (df2 + 2)) : void 0;
+          },
+          // return a random sample
+          sample: function sample(df1, df2) {
+            var x1 = jStat4.randg(df1 / 2) * 2;
+            var x2 = jStat4.randg(df2 / 2) * 2;
+            return x1 / df1 / (x2 / df2);
+          },
+          variance: function variance(df1, df2) {
+            if (df2 <= 4)
+              return void 0;
+            return 2 * df2 * df2 * (df1 + df2 - 2) / (df1 * (df2 - 2) * (df2 - 2) * (df2 - 4));
+          }
+        });
+        jStat4.extend(jStat4.cauchy, {
+          pdf: function pdf(x2, local, scale) {
+            if (scale < 0) {
+              return 0;
+            }
+            return scale / (Math2.pow(x2 - local, 2) + Math2.pow(scale, 2)) / Math2.PI;
+          },
+          cdf: function cdf(x2, local, scale) {
+            return Math2.atan((x2 - local) / scale) / Math2.PI + 0.5;
+          },
+          inv: function(p, local, scale) {
+            return local + scale * Math2.tan(Math2.PI * (p - 0.5));
+          },
+          median: function median(local) {
+            return local;
+          },
+          mode: function mode(local) {
+            return local;
+          },
+          sample: function sample(local, scale) {
+            return jStat4.randn() * Math2.sqrt(1 / (2 * jStat4.randg(0.5))) * scale + local;
+          }
+        });
+        jStat4.extend(jStat4.chisquare, {
+          pdf: function pdf(x2, dof) {
+            if (x2 < 0)
+              return 0;
+            return x2 === 0 && dof === 2 ? 0.5 : Math2.exp((dof / 2 - 1) * Math2.log(x2) - x2 / 2 - dof / 2 * Math2.log(2) - jStat4.gammaln(dof / 2));
+          },
+          cdf: function cdf(x2, dof) {
+            if (x2 < 0)
+              return 0;
+            return jStat4.lowRegGamma(dof / 2, x2 / 2);
+          },
+          inv: function(p, dof) {
+            return 2 * jStat4.gammapinv(p, 0.5 * dof);
+          },
+          mean: function(dof) {
+            return dof;
+          },
+          // TODO: this is an approximation (is there a better way?)
+          median: function median(dof) {
+            return dof * Math2.pow(1 - 2 / (9 * dof), 3);
+          },
+          mode: function mode(dof) {
+            return dof - 2 > 0 ? dof - 2 : 0;
+          },
+          sample: function sample(dof) {
+            return jStat4.randg(dof / 2) * 2;
+          },
+          variance: function variance(dof) {
+            return 2 * dof;
+          }
+        });
+        jStat4.extend(jStat4.exponential, {
+          pdf: function pdf(x2, rate) {
+            return x2 < 0 ? 0 : rate * Math2.exp(-rate * x2);
+          },
+          cdf: function cdf(x2, rate) {
+            return x2 < 0 ? 0 : 1 - Math2.exp(-rate * x2);
+          },
+          inv: function(p, rate) {
+            return -Math2.log(1 - p) / rate;
+          },
+          mean: function(rate) {
+            return 1 / rate;
+          },
+          median: function(rate) {
+            return 1 / rate * Math2.log(2);
+          },
+          mode: function mode() {
+            return 0;
+          },
+          sample: function sample(rate) {
+            return -1 / rate * Math2.log(jStat4._random_fn());
+          },
+          variance: function(rate) {
+            return Math2.pow(rate, -2);
+          }
+        });
+        jStat4.extend(jStat4.gamma, {
+          pdf: function pdf(x2, shape, scale) {
+            if (x2 < 0)
+              return 0;
+            return x2 === 0 && shape === 1 ? 1 / scale : Math2.exp((shape - 1) * Math2.log(x2) - x2 / scale - jStat4.gammaln(shape) - shape * Math2.log(scale));
+          },
+          cdf: function cdf(x2, shape, scale) {
+            if (x2 < 0)
+              return 0;
+            return jStat4.lowRegGamma(shape, x2 / scale);
+          },
+          inv: function(p, shape, scale) {
+            return jStat4.gammapinv(p, shape) * scale;
+          },
+          mean: function(shape, scale) {
+            return shape * scale;
+          },
+          mode: function mode(shape, scale) {
+            if (shape > 1) return (shape - 1) * scale;
+            return void 0;
+          },
+          sample: function sample(shape, scale) {
+            return jStat4.randg(shape) * scale;
+          },
+          variance: function variance(shape, scale) {
+            return shape * scale * scale;
+          }
+        });
+        jStat4.extend(jStat4.invgamma, {
+          pdf: function pdf(x2, shape, scale) {
+            if (x2 <= 0)
+              return 0;
+            return Math2.exp(-(shape + 1) * Math2.log(x2) - scale / x2 - jStat4.gammaln(shape) + shape * Math2.log(scale));
+          },
+          cdf: function cdf(x2, shape, scale) {
+            if (x2 <= 0)
+              return 0;
+            return 1 - jStat4.lowRegGamma(shape, scale / x2);
+          },
+          inv: function(p, shape, scale) {
+            return scale / jStat4.gammapinv(1 - p, shape);
+          },
+          mean: function(shape, scale) {
+            return shape > 1 ? scale / (shape - 1) : void 0;
+          },
+          mode: function mode(shape, scale) {
+            return scale / (shape + 1);
+          },
+          sample: function sample(shape, scale) {
+            return scale / jStat4.randg(shape);
+          },
+          variance: function variance(shape, scale) {
+            if (shape <= 2)
+              return void 0;
+            return scale * scale / ((shape - 1) * (shape - 1) * (shape - 2));
+          }
+        });
+        jStat4.extend(jStat4.kumaraswamy, {
+          pdf: function pdf(x2, alpha, beta) {
+            if (x2 === 0 && alpha === 1)
+              return beta;
+            else if (x2 === 1 && beta === 1)
+              return alpha;
+            return Math2.exp(Math2.log(alpha) + Math2.log(beta) + (alpha - 1) * Math2.log(x2) + (beta - 1) * Math2.log(1 - Math2.pow(x2, alpha)));
+          },
+          cdf: function cdf(x2, alpha, beta) {
+            if (x2 < 0)
+              return 0;
+            else if (x2 > 1)
+              return 1;
+            return 1 - Math2.pow(1 - Math2.pow(x2, alpha), beta);
+          },
+          inv: function inv(p, alpha, beta) {
+            return Math2.pow(1 - Math2.pow(1 - p, 1 / beta), 1 / alpha);
+          },
+          mean: function(alpha, beta) {
+            return beta * jStat4.gammafn(1 + 1 / alpha) * jStat4.gammafn(beta) / jStat4.gammafn(1 + 1 / alpha + beta);
+          },
+          median: function median(alpha, beta) {
+            return Math2.pow(1 - Math2.pow(2, -1 / beta), 1 / alpha);
+          },
+          mode: function mode(alpha, beta) {
+            if (!(alpha >= 1 && beta >= 1 && (alpha !== 1 && beta !== 1)))
+              return void 0;
+            return Math2.pow((alpha - 1) / (alpha * beta - 1), 1 / alpha);
+          },
+          variance: function variance() {
+            throw new Error("variance not yet implemented");
+          }
+        });
+        jStat4.extend(jStat4.lognormal, {
+          pdf: function pdf(x2, mu, sigma) {
+            if (x2 <= 0)
+              return 0;
+            return Math2.exp(-Math2.log(x2) - 0.5 * Math2.log(2 * Math2.PI) - Math2.log(sigma) - Math2.pow(Math2.log(x2) - mu, 2) / (2 * sigma * sigma));
+          },
+          cdf: function cdf(x2, mu, sigma) {
+            if (x2 < 0)
+              return 0;
+            return 0.5 + 0.5 * jStat4.erf((Math2.log(x2) - mu) / Math2.sqrt(2 * sigma * sigma));
+          },
+          inv: function(p, mu, sigma) {
+            return Math2.exp(-1.4142135623730951 * sigma * jStat4.erfcinv(2 * p) + mu);
+          },
+          mean: function mean2(mu, sigma) {
+            return Math2.exp(mu + sigma * sigma / 2);
+          },
+          median: function median(mu) {
+            return Math2.exp(mu);
+          },
+          mode: function mode(mu, sigma) {
+            return Math2.exp(mu - sigma * sigma);
+          },
+          sample: function sample(mu, sigma) {
+            return Math2.exp(jStat4.randn() * sigma + mu);
+          },
+          variance: function variance(mu, sigma) {
+            return (Math2.exp(sigma * sigma) - 1) * Math2.exp(2 * mu + sigma * sigma);
+          }
+        });
+        jStat4.extend(jStat4.noncentralt, {
+          pdf: function pdf(x2, dof, ncp) {
+            var tol = 1e-14;
+            if (Math2.abs(ncp) < tol)
+              return jStat4.studentt.pdf(x2, dof);
+            if (Math2.abs(x2) < tol) {
+              return Math2.exp(jStat4.gammaln((dof + 1) / 2) - ncp * ncp / 2 - 0.5 * Math2.log(Math2.PI * dof) - jStat4.gammaln(dof / 2));
+            }
+            return dof / x2 * (jStat4.noncentralt.cdf(x2 * Math2.sqrt(1 + 2 / dof), dof + 2, ncp) - jStat4.noncentralt.cdf(x2, dof, ncp));
+          },
+          cdf: function cdf(x2, dof, ncp) {
+            var tol = 1e-14;
+            var min_iterations = 200;
+            if (Math2.abs(ncp) < tol)
+              return jStat4.studentt.cdf(x2, dof);
+            var flip = false;
+            if (x2 < 0) {
+              flip = true;
+              ncp = -ncp;
+            }
+            var prob = jStat4.normal.cdf(-ncp, 0, 1);
+            var value2 = tol + 1;
+            var lastvalue = value2;
+            var y = x2 * x2 / (x2 * x2 + dof);
+            var j = 0;
+            var p = Math2.exp(-ncp * ncp / 2);
+            var q = Math2.exp(-ncp * ncp / 2 - 0.5 * Math2.log(2) - jStat4.gammaln(3 / 2)) * ncp;
+            while (j < min_iterations || lastvalue > tol || value2 > tol) {
+              lastvalue = value2;
+              if (j > 0) {
+                p *= ncp * ncp / (2 * j);
+                q *= ncp * ncp / (2 * (j + 1 / 2));
+              }
+              value2 = p * jStat4.beta.cdf(y, j + 0.5, dof / 2) + q * jStat4.beta.cdf(y, j + 1, dof / 2);
+              prob += 0.5 * value2;
+              j++;
+            }
+            return flip ? 1 - prob : prob;
+          }
+        });
+        jStat4.extend(jStat4.normal, {
+          pdf: function pdf(x2, mean2, std) {
+            return Math2.exp(-0.5 * Math2.log(2 * Math2.PI) - Math2.log(std) - Math2.pow(x2 - mean2, 2) / (2 * std * std));
+          },
+          cdf: function cdf(x2, mean2, std) {
+            return 0.5 * (1 + jStat4.erf((x2 - mean2) / Math2.sqrt(2 * std * std)));
+          },
+          inv: function(p, mean2, std) {
+            return -1.4142135623730951 * std * jStat4.erfcinv(2 * p) + mean2;
+          },
+          mean: function(mean2) {
+            return mean2;
+          },
+          median: function median(mean2) {
+            return mean2;
+          },
+          mode: function(mean2) {
+            return mean2;
+          },
+          sample: function sample(mean2, std) {
+            return jStat4.randn() * std + mean2;
+          },
+          variance: function(mean2, std) {
+            return std * std;
+          }
+        });
+        jStat4.extend(jStat4.pareto, {
+          pdf: function pdf(x2, scale, shape) {
+            if (x2 < scale)
+              return 0;
+            return shape * Math2.pow(scale, shape) / Math2.pow(x2, shape + 1);
+          },
+          cdf: function cdf(x2, scale, shape) {
+            if (x2 < scale)
+              return 0;
+            return 1 - Math2.pow(scale / x2, shape);
+          },
+          inv: function inv(p, scale, shape) {
+            return scale / Math2.pow(1 - p, 1 / shape);
+          },
+          mean: function mean2(scale, shape) {
+            if (shape <= 1)
+              return void 0;
+            return shape * Math2.pow(scale, shape) / (shape - 1);
+          },
+          median: function median(scale, shape) {
+            return scale * (shape * Math2.SQRT2);
+          },
+          mode: function mode(scale) {
+            return scale;
+          },
+          variance: function(scale, shape) {
+            if (shape <= 2)
+              return void 0;
+            return scale * scale * shape / (Math2.pow(shape - 1, 2) * (shape - 2));
+          }
+        });
+        jStat4.extend(jStat4.studentt, {
+          pdf: function pdf(x2, dof) {
+            dof = dof > 1e100 ? 1e100 : dof;
+            return 1 / (Math2.sqrt(dof) * jStat4.betafn(0.5, dof / 2)) * Math2.pow(1 + x2 * x2 / dof, -((dof + 1) / 2));
+          },
+          cdf: function cdf(x2, dof) {
+            var dof2 = dof / 2;
+            return jStat4.ibeta((x2 + Math2.sqrt(x2 * x2 + dof)) / (2 * Math2.sqrt(x2 * x2 + dof)), dof2, dof2);
+          },
+          inv: function(p, dof) {
+            var x2 = jStat4.ibetainv(2 * Math2.min(p, 1 - p), 0.5 * dof, 0.5);
+            x2 = Math2.sqrt(dof * (1 - x2) / x2);
+            return p > 0.5 ? x2 : -x2;
+          },
+          mean: function mean2(dof) {
+            return dof > 1 ? 0 : void 0;
+          },
+          median: function median() {
+            return 0;
+          },
+          mode: function mode() {
+            return 0;
+          },
+          sample: function sample(dof) {
+            return jStat4.randn() * Math2.sqrt(dof / (2 * jStat4.randg(dof / 2)));
+          },
+          variance: function variance(dof) {
+            return dof > 2 ? dof / (dof - 2) : dof > 1 ? Infinity : void 0;
+          }
+        });
+        jStat4.extend(jStat4.weibull, {
+          pdf: function pdf(x2, scale, shape) {
+            if (x2 < 0 || scale < 0 || shape < 0)
+              return 0;
+            return shape / scale * Math2.pow(x2 / scale, shape - 1) * Math2.exp(-Math2.pow(x2 / scale, shape));
+          },
+          cdf: function cdf(x2, scale, shape) {
+            return x2 < 0 ? 0 : 1 - Math2.exp(-Math2.pow(x2 / scale, shape));
+          },
+          inv: function(p, scale, shape) {
+            return scale * Math2.pow(-Math2.log(1 - p), 1 / shape);
+          },
+          mean: function(scale, shape) {
+            return scale * jStat4.gammafn(1 + 1 / shape);
+          },
+          median: function median(scale, shape) {
+            return scale * Math2.pow(Math2.log(2), 1 / shape);
+          },
+          mode: function mode(scale, shape) {
+            if (shape <= 1)
+              return 0;
+            return scale * Math2.pow((shape - 1) / shape, 1 / shape);
+          },
+          sample: function sample(scale, shape) {
+            return scale * Math2.pow(-Math2.log(jStat4._random_fn()), 1 / shape);
+          },
+          variance: function variance(scale, shape) {
+            return scale * scale * jStat4.gammafn(1 + 2 / shape) - Math2.pow(jStat4.weibull.mean(scale, shape), 2);
+          }
+        });
+        jStat4.extend(jStat4.uniform, {
+          pdf: function pdf(x2, a, b) {
+            return x2 < a || x2 > b ? 0 : 1 / (b - a);
+          },
+          cdf: function cdf(x2, a, b) {
+            if (x2 < a)
+              return 0;
+            else if (x2 < b)
+              return (x2 - a) / (b - a);
+            return 1;
+          },
+          inv: function(p, a, b) {
+            return a + p * (b - a);
+          },
+          mean: function mean2(a, b) {
+            return 0.5 * (a + b);
+          },
+          median: function median(a, b) {
+            return jStat4.mean(a, b);
+          },
+          mode: function mode() {
+            throw new Error("mode is not yet implemented");
+          },
+          sample: function sample(a, b) {
+            return a / 2 + b / 2 + (b / 2 - a / 2) * (2 * jStat4._random_fn() - 1);
+          },
+          variance: function variance(a, b) {
+            return Math2.pow(b - a, 2) / 12;
+          }
+        });
+        function betinc(x2, a, b, eps) {
+          var a0 = 0;
+          var b0 = 1;
+          var a1 = 1;
+          var b1 = 1;
+          var m9 = 0;
+          var a2 = 0;
+          var c9;
+          while (Math2.abs((a1 - a2) / a1) > eps) {
+            a2 = a1;
+            c9 = -(a + m9) * (a + b + m9) * x2 / (a + 2 * m9) / (a + 2 * m9 + 1);
+            a0 = a1 + c9 * a0;
+            b0 = b1 + c9 * b0;
+            m9 = m9 + 1;
+            c9 = m9 * (b - m9) * x2 / (a + 2 * m9 - 1) / (a + 2 * m9);
+            a1 = a0 + c9 * a1;
+            b1 = b0 + c9 * b1;
+            a0 = a0 / b1;
+            b0 = b0 / b1;
+            a1 = a1 / b1;
+            b1 = 1;
+          }
+          return a1 / a;
+        }
+        jStat4.extend(jStat4.binomial, {
+          pdf: function pdf(k, n, p) {
+            return p === 0 || p === 1 ? n * p === k ? 1 : 0 : jStat4.combination(n, k) * Math2.pow(p, k) * Math2.pow(1 - p, n - k);
+          },
+          cdf: function cdf(x2, n, p) {
+            var betacdf;
+            var eps = 1e-10;
+            if (x2 < 0)
+              return 0;
+            if (x2 >= n)
+              return 1;
+            if (p < 0 || p > 1 || n <= 0)
+              return NaN;
+            x2 = Math2.floor(x2);
+            var z = p;
+            var a = x2 + 1;
+            var b = n - x2;
+            var s = a + b;
+            var bt = Math2.exp(jStat4.gammaln(s) - jStat4.gammaln(b) - jStat4.gammaln(a) + a * Math2.log(z) + b * Math2.log(1 - z));
+            if (z < (a + 1) / (s + 2))
+              betacdf = bt * betinc(z, a, b, eps);
+            else
+              betacdf = 1 - bt * betinc(1 - z, b, a, eps);
+            return Math2.round((1 - betacdf) * (1 / eps)) / (1 / eps);
+          }
+        });
+        jStat4.extend(jStat4.negbin, {
+          pdf: function pdf(k, r, p) {
+            if (k !== k >>> 0)
+              return false;
+            if (k < 0)
+              return 0;
+            return jStat4.combination(k + r - 1, r - 1) * Math2.pow(1 - p, k) * Math2.pow(p, r);
+          },
+          cdf: function cdf(x2, r, p) {
+            var sum = 0, k = 0;
+            if (x2 < 0) return 0;
+            for (; k <= x2; k++) {
+              sum += jStat4.negbin.pdf(k, r, p);
+            }
+            return sum;
+          }
+        });
+        jStat4.extend(jStat4.hypgeom, {
+          pdf: function pdf(k, N, m, n) {
+            if (k !== k | 0) {
+              return false;
+            } else if (k < 0 || k < m - (N - n)) {
+              return 0;
+            } else if (k > n || k > m) {
+              return 0;
+            } else if (m * 2 > N) {
+              if (n * 2 > N) {
+                return jStat4.hypgeom.pdf(N - m - n + k, N, N - m, N - n);
+              } else {
+                return jStat4.hypgeom.pdf(n - k, N, N - m, n);
+              }
+            } else if (n * 2 > N) {
+              return jStat4.hypgeom.pdf(m - k, N, m, N - n);
+            } else if (m < n) {
+              return jStat4.hypgeom.pdf(k, N, n, m);
+            } else {
+              var scaledPDF = 1;
+              var samplesDone = 0;
+              for (var i2 = 0; i2 < k; i2++) {
+                while (scaledPDF > 1 && samplesDone < n) {
+                  scaledPDF *= 1 - m / (N - samplesDone);
+                  samplesDone++;
+                }
+                scaledPDF *= (n - i2) * (m - i2) / ((i2 + 1) * (N - m - n + i2 + 1));
+              }
+              for (; samplesDone < n; samplesDone++) {
+                scaledPDF *= 1 - m / (N - samplesDone);
+              }
+              return Math2.min(1, Math2.max(0, scaledPDF));
+            }
+          },
+          cdf: function cdf(x2, N, m, n) {
+            if (x2 < 0 || x2 < m - (N - n)) {
+              return 0;
+            } else if (x2 >= n || x2 >= m) {
+              return 1;
+            } else if (m * 2 > N) {
+              if (n * 2 > N) {
+                return jStat4.hypgeom.cdf(N - m - n + x2, N, N - m, N - n);
+              } else {
+                return 1 - jStat4.hypgeom.cdf(n - x2 - 1, N, N - m, n);
+              }
+            } else if (n * 2 > N) {
+              return 1 - jStat4.hypgeom.cdf(m - x2 - 1, N, m, N - n);
+            } else if (m < n) {
+              return jStat4.hypgeom.cdf(x2, N, n, m);
+            } else {
+              var scaledCDF = 1;
+              var scaledPDF = 1;
+              var samplesDone = 0;
+              for (var i2 = 0; i2 < x2; i2++) {
+                while (scaledCDF > 1 && samplesDone < n) {
+                  var factor = 1 - m / (N - samplesDone);
+                  scaledPDF *= factor;
+                  scaledCDF *= factor;
+                  samplesDone++;
+                }
+                scaledPDF *= (n - i2) * (m - i2) / ((i2 + 1) * (N - m - n + i2 + 1));
+                scaledCDF += scaledPDF;
+              }
+              for (; samplesDone < n; samplesDone++) {
+                scaledCDF *= 1 - m / (N - samplesDone);
+              }
+              return Math2.min(1, Math2.max(0, scaledCDF));
+            }
+          }
+        });
+        jStat4.extend(jStat4.poisson, {
+          pdf: function pdf(k, l) {
+            if (l < 0 || k % 1 !== 0 || k < 0) {
+              return 0;
+            }
+            return Math2.pow(l, k) * Math2.exp(-l) / jStat4.factorial(k);
+          },
+          cdf: function cdf(x2, l) {
+            var sumarr = [], k = 0;
+            if (x2 < 0) return 0;
+            for (; k <= x2; k++) {
+              sumarr.push(jStat4.poisson.pdf(k, l));
+            }
+            return jStat4.sum(sumarr);
+          },
+          mean: function(l) {
+            return l;
+          },
+          variance: function(l) {
+            return l;
+          },
+          sampleSmall: function sampleSmall(l) {
+            var p = 1, k = 0, L = Math2.exp(-l);
+            do {
+              k++;
+              p *= jStat4._random_fn();
+            } while (p > L);
+            return k - 1;
+          },
+          sampleLarge: function sampleLarge(l) {
+            var lam = l;
+            var k;
+            var U, V, slam, loglam, a, b, invalpha, vr, us;
+            slam = Math2.sqrt(lam);
+            loglam = Math2.log(lam);
+            b = 0.931 + 2.53 * slam;
+            a = -0.059 + 0.02483 * b;
+            invalpha = 1.1239 + 1.1328 / (b - 3.4);
+            vr = 0.9277 - 3.6224 / (b - 2);
+            while (1) {
+              U = Math2.random() - 0.5;
+              V = Math2.random();
+              us = 0.5 - Math2.abs(U);
+              k = Math2.floor((2 * a / us + b) * U + lam + 0.43);
+              if (us >= 0.07 && V <= vr) {
+                return k;
+              }
+              if (k < 0 || us < 0.013 && V > us) {
+                continue;
+              }
+              if (Math2.log(V) + Math2.log(invalpha) - Math2.log(a / (us * us) + b) <= -lam + k * loglam - jStat4.loggam(k + 1)) {
+                return k;
+              }
+            }
+          },
+          sample: function sample(l) {
+            if (l < 10)
+              return this.sampleSmall(l);
+            else
+              return this.sampleLarge(l);
+          }
+        });
+        jStat4.extend(jStat4.triangular, {
+          pdf: function pdf(x2, a, b, c) {
+            if (b <= a || c < a || c > b) {
+              return NaN;
+            } else {
+              if (x2 < a || x2 > b) {
+                return 0;
+              } else if (x2 < c) {
+                return 2 * (x2 - a) / ((b - a) * (c - a));
+              } else if (x2 === c) {
+                return 2 / (b - a);
+              } else {
+                return 2 * (b - x2) / ((b - a) * (b - c));
+              }
+            }
+          },
+          cdf: function cdf(x2, a, b, c) {
+            if (b <= a || c < a || c > b)
+              return NaN;
+            if (x2 <= a)
+              return 0;
+            else if (x2 >= b)
+              return 1;
+            if (x2 <= c)
+              return Math2.pow(x2 - a, 2) / ((b - a) * (c - a));
+            else
+              return 1 - Math2.pow(b - x2, 2) / ((b - a) * (b - c));
+          },
+          inv: function inv(p, a, b, c) {
+            if (b <= a || c < a || c > b) {
+              return NaN;
+            } else {
+              if (p <= (c - a) / (b - a)) {
+                return a + (b - a) * Math2.sqrt(p * ((c - a) / (b - a)));
+              } else {
+                return a + (b - a) * (1 - Math2.sqrt((1 - p) * (1 - (c - a) / (b - a))));
+              }
+            }
+          },
+          mean: function mean2(a, b, c) {
+            return (a + b + c) / 3;
+          },
+          median: function median(a, b, c) {
+            if (c <= (a + b) / 2) {
+              return b - Math2.sqrt((b - a) * (b - c)) / Math2.sqrt(2);
+            } else if (c > (a + b) / 2) {
+              return a + Math2.sqrt((b - a) * (c - a)) / Math2.sqrt(2);
+            }
+          },
+          mode: function mode(a, b, c) {
+            return c;
+          },
+          sample: function sample(a, b, c) {
+            var u = jStat4._random_fn();
+            if (u < (c - a) / (b - a))
+              return a + Math2.sqrt(u * (b - a) * (c - a));
+            return b - Math2.sqrt((1 - u) * (b - a) * (b - c));
+          },
+          variance: function variance(a, b, c) {
+            return (a * a + b * b + c * c - a * b - a * c - b * c) / 18;
+          }
+        });
+        jStat4.extend(jStat4.arcsine, {
+          pdf: function pdf(x2, a, b) {
+            if (b <= a) return NaN;
+            return x2 <= a || x2 >= b ? 0 : 2 / Math2.PI * Math2.pow(Math2.pow(b - a, 2) - Math2.pow(2 * x2 - a - b, 2), -0.5);
+          },
+          cdf: function cdf(x2, a, b) {
+            if (x2 < a)
+              return 0;
+            else if (x2 < b)
+              return 2 / Math2.PI * Math2.asin(Math2.sqrt((x2 - a) / (b - a)));
+            return 1;
+          },
+          inv: function(p, a, b) {
+            return a + (0.5 - 0.5 * Math2.cos(Math2.PI * p)) * (b - a);
+          },
+          mean: function mean2(a, b) {
+            if (b <= a) return NaN;
+            return (a + b) / 2;
+          },
+          median: function median(a, b) {
+            if (b <= a) return NaN;
+            return (a + b) / 2;
+          },
+          mode: function mode() {
+            throw new Error("mode is not yet implemented");
+          },
+          sample: function sample(a, b) {
+            return (a + b) / 2 + (b - a) / 2 * Math2.sin(2 * Math2.PI * jStat4.uniform.sample(0, 1));
+          },
+          variance: function variance(a, b) {
+            if (b <= a) return NaN;
+            return Math2.pow(b - a, 2) / 8;
+          }
+        });
+        function laplaceSign(x2) {
+          return x2 / Math2.abs(x2);
+        }
+        jStat4.extend(jStat4.laplace, {
+          pdf: function pdf(x2, mu, b) {
+            return b <= 0 ? 0 : Math2.exp(-Math2.abs(x2 - mu) / b) / (2 * b);
+          },
+          cdf: function cdf(x2, mu, b) {
+            if (b <= 0) {
+              return 0;
+            }
+            if (x2 < mu) {
+              return 0.5 * Math2.exp((x2 - mu) / b);
+            } else {
+              return 1 - 0.5 * Math2.exp(-(x2 - mu) / b);
+            }
+          },
+          mean: function(mu) {
+            return mu;
+          },
+          median: function(mu) {
+            return mu;
+          },
+          mode: function(mu) {
+            return mu;
+          },
+          variance: function(mu, b) {
+            return 2 * b * b;
+          },
+          sample: function sample(mu, b) {
+            var u = jStat4._random_fn() - 0.5;
+            return mu - b * laplaceSign(u) * Math2.log(1 - 2 * Math2.abs(u));
+          }
+        });
+        function tukeyWprob(w, rr, cc) {
+          var nleg = 12;
+          var ihalf = 6;
+          var C1 = -30;
+          var C2 = -50;
+          var C3 = 60;
+          var bb = 8;
+          var wlar = 3;
+          var wincr1 = 2;
+          var wincr2 = 3;
+          var xleg = [
+            0.9815606342467192,
+            0.9041172563704749,
+            0.7699026741943047,
+            0.5873179542866175,
+            0.3678314989981802,
+            0.1252334085114689
+          ];
+          var aleg = [
+            0.04717533638651183,
+            0.10693932599531843,
+            0.16007832854334622,
+            0.20316742672306592,
+            0.2334925365383548,
+            0.24914704581340277
+          ];
+          var qsqz = w * 0.5;
+          if (qsqz >= bb)
+            return 1;
+          var pr_w = 2 * jStat4.normal.cdf(qsqz, 0, 1, 1, 0) - 1;
+          if (pr_w >= Math2.exp(C2 / cc))
+            pr_w = Math2.pow(pr_w, cc);
+          else
+            pr_w = 0;
+          var wincr;
+          if (w > wlar)
+            wincr = wincr1;
+          else
+            wincr = wincr2;
+          var blb = qsqz;
+          var binc = (bb - qsqz) / wincr;
+          var bub = blb + binc;
+          var einsum = 0;
+          var cc1 = cc - 1;
+          for (var wi = 1; wi <= wincr; wi++) {
+            var elsum = 0;
+            var a = 0.5 * (bub + blb);
+            var b = 0.5 * (bub - blb);
+            for (var jj = 1; jj <= nleg; jj++) {
+              var j, xx;
+              if (ihalf < jj) {
+                j = nleg - jj + 1;
+                xx = xleg[j - 1];
+              } else {
+                j = jj;
+                xx = -xleg[j - 1];
+              }
+              var c = b * xx;
+              var ac = a + c;
+              var qexpo = ac * ac;
+              if (qexpo > C3)
+                break;
+              var pplus = 2 * jStat4.normal.cdf(ac, 0, 1, 1, 0);
+              var pminus = 2 * jStat4.normal.cdf(ac, w, 1, 1, 0);
+              var rinsum = pplus * 0.5 - pminus * 0.5;
+              if (rinsum >= Math2.exp(C1 / cc1)) {
+                rinsum = aleg[j - 1] * Math2.exp(-(0.5 * qexpo)) * Math2.pow(rinsum, cc1);
+                elsum += rinsum;
+              }
+            }
+            elsum *= 2 * b * cc / Math2.sqrt(2 * Math2.PI);
+            einsum += elsum;
+            blb = bub;
+            bub += binc;
+          }
+          pr_w += einsum;
+          if (pr_w <= Math2.exp(C1 / rr))
+            return 0;
+          pr_w = Math2.pow(pr_w, rr);
+          if (pr_w >= 1)
+            return 1;
+          return pr_w;
+        }
+        function tukeyQinv(p, c, v) {
+          var p0 = 0.322232421088;
+          var q0 = 0.099348462606;
+          var p1 = -1;
+          var q1 = 0.588581570495;
+          var p2 = -0.342242088547;
+          var q2 = 0.531103462366;
+          var p3 = -0.204231210125;
+          var q3 = 0.10353775285;
+          var p4 = -453642210148e-16;
+          var q4 = 0.0038560700634;
+          var c1 = 0.8832;
+          var c2 = 0.2368;
+          var c3 = 1.214;
+          var c4 = 1.208;
+          var c5 = 1.4142;
+          var vmax = 120;
+          var ps = 0.5 - 0.5 * p;
+          var yi = Math2.sqrt(Math2.log(1 / (ps * ps)));
+          var t = yi + ((((yi * p4 + p3) * yi + p2) * yi + p1) * yi + p0) / ((((yi * q4 + q3) * yi + q2) * yi + q1) * yi + q0);
+          if (v < vmax) t += (t * t * t + t) / v / 4;
+          var q = c1 - c2 * t;
+          if (v < vmax) q += -c3 / v + c4 * t / v;
+          return t * (q * Math2.log(c - 1) + c5);
+        }
+        jStat4.extend(jStat4.tukey, {
+          cdf: function cdf(q, nmeans, df) {
+            var rr = 1;
+            var cc = nmeans;
+            var nlegq = 16;
+            var ihalfq = 8;
+            var eps1 = -30;
+            var eps2 = 1e-14;
+            var dhaf = 100;
+            var dquar = 800;
+            var deigh = 5e3;
+            var dlarg = 25e3;
+            var ulen1 = 1;
+            var ulen2 = 0.5;
+            var ulen3 = 0.25;
+            var ulen4 = 0.125;
+            var xlegq = [
+              0.9894009349916499,
+              0.9445750230732326,
+              0.8656312023878318,
+              0.755404408355003,
+              0.6178762444026438,
+              0.45801677765722737,
+              0.2816035507792589,
+              0.09501250983763744
+            ];
+            var alegq = [
+              0.027152459411754096,
+              0.062253523938647894,
+              0.09515851168249279,
+              0.12462897125553388,
+              0.14959598881657674,
+              0.16915651939500254,
+              0.18260341504492358,
+              0.1894506104550685
+            ];
+            if (q <= 0)
+              return 0;
+            if (df < 2 || rr < 1 || cc < 2) return NaN;
+            if (!Number.isFinite(q))
+              return 1;
+            if (df > dlarg)
+              return tukeyWprob(q, rr, cc);
+            var f2 = df * 0.5;
+            var f2lf = f2 * Math2.log(df) - df * Math2.log(2) - jStat4.gammaln(f2);
+            var f21 = f2 - 1;
+            var ff4 = df * 0.25;
+            var ulen;
+            if (df <= dhaf) ulen = ulen1;
+            else if (df <= dquar) ulen = ulen2;
+            else if (df <= deigh) ulen = ulen3;
+            else ulen = ulen4;
+            f2lf += Math2.log(ulen);
+            var ans = 0;
+            for (var i2 = 1; i2 <= 50; i2++) {
+              var otsum = 0;
+              var twa1 = (2 * i2 - 1) * ulen;
+              for (var jj = 1; jj <= nlegq; jj++) {
+                var j, t1;
+                if (ihalfq < jj) {
+                  j = jj - ihalfq - 1;
+                  t1 = f2lf + f21 * Math2.log(twa1 + xlegq[j] * ulen) - (xlegq[j] * ulen + twa1) * ff4;
+                } else {
+                  j = jj - 1;
+                  t1 = f2lf + f21 * Math2.log(twa1 - xlegq[j] * ulen) + (xlegq[j] * ulen - twa1) * ff4;
+                }
+                var qsqz;
+                if (t1 >= eps1) {
+                  if (ihalfq < jj) {
+                    qsqz = q * Math2.sqrt((xlegq[j] * ulen + twa1) * 0.5);
+                  } else {
+                    qsqz = q * Math2.sqrt((-(xlegq[j] * ulen) + twa1) * 0.5);
+                  }
+                  var wprb = tukeyWprob(qsqz, rr, cc);
+                  var rotsum = wprb * alegq[j] * Math2.exp(t1);
+                  otsum += rotsum;
+                }
+              }
+              if (i2 * ulen >= 1 && otsum <= eps2)
+                break;
+              ans += otsum;
+            }
+            if (otsum > eps2) {
+              throw new Error("tukey.cdf failed to converge");
+            }
+            if (ans > 1)
+              ans = 1;
+            return ans;
+          },
+          inv: function(p, nmeans, df) {
+            var rr = 1;
+            var cc = nmeans;
+            var eps = 1e-4;
+            var maxiter = 50;
+            if (df < 2 || rr < 1 || cc < 2) return NaN;
+            if (p < 0 || p > 1) return NaN;
+            if (p === 0) return 0;
+            if (p === 1) return Infinity;
+            var x0 = tukeyQinv(p, cc, df);
+            var valx0 = jStat4.tukey.cdf(x0, nmeans, df) - p;
+            var x1;
+            if (valx0 > 0)
+              x1 = Math2.max(0, x0 - 1);
+            else
+              x1 = x0 + 1;
+            var valx1 = jStat4.tukey.cdf(x1, nmeans, df) - p;
+            var ans;
+            for (var iter = 1; iter < maxiter; iter++) {
+              ans = x1 - valx1 * (x1 - x0) / (valx1 - valx0);
+              valx0 = valx1;
+              x0 = x1;
+              if (ans < 0) {
+                ans = 0;
+                valx1 = -p;
+              }
+              valx1 = jStat4.tukey.cdf(ans, nmeans, df) - p;
+              x1 = ans;
+              var xabs = Math2.abs(x1 - x0);
+              if (xabs < eps)
+                return ans;
+            }
+            throw new Error("tukey.inv failed to converge");
+          }
+        });
+      })(jStat3, Math);
+      (function(jStat4, Math2) {
+        var push = Array.prototype.push;
+        var isArray = jStat4.utils.isArray;
+        function isUsable(arg) {
+          return isArray(arg) || arg instanceof jStat4;
+        }
+        jStat4.extend({
+          // add a vector/matrix to a vector/matrix or scalar
+          add: function add(arr, arg) {
+            if (isUsable(arg)) {
+              if (!isUsable(arg[0])) arg = [arg];
+              return jStat4.map(arr, function(value2, row, col) {
+                return value2 + arg[row][col];
+              });
+            }
+            return jStat4.map(arr, function(value2) {
+              return value2 + arg;
+            });
+          },
+          // subtract a vector or scalar from the vector
+          subtract: function subtract(arr, arg) {
+            if (isUsable(arg)) {
+              if (!isUsable(arg[0])) arg = [arg];
+              return jStat4.map(arr, function(value2, row, col) {
+                return value2 - arg[row][col] || 0;
+              });
+            }
+            return jStat4.map(arr, function(value2) {
+              return value2 - arg;
+            });
+          },
+          // matrix division
+          divide: function divide(arr, arg) {
+            if (isUsable(arg)) {
+              if (!isUsable(arg[0])) arg = [arg];
+              return jStat4.multiply(arr, jStat4.inv(arg));
+            }
+            return jStat4.map(arr, function(value2) {
+              return value2 / arg;
+            });
+          },
+          // matrix multiplication
+          multiply: function multiply(arr, arg) {
+            var row, col, nrescols, sum, nrow, ncol, res, rescols;
+            if (arr.length === void 0 && arg.length === void 0) {
+              return arr * arg;
+            }
+            nrow = arr.length, ncol = arr[0].length, res = jStat4.zeros(nrow, nrescols = isUsable(arg) ? arg[0].length : ncol), rescols = 0;
+            if (isUsable(arg)) {
+              for (; rescols < nrescols; rescols++) {
+                for (row = 0; row < nrow; row++) {
+                  sum = 0;
+                  for (col = 0; col < ncol; col++)
+                    sum += arr[row][col] * arg[col][rescols];
+                  res[row][rescols] = sum;
+                }
+              }
+              return nrow === 1 && rescols === 1 ? res[0][0] : res;
+            }
+            return jStat4.map(arr, function(value2) {
+              return value2 * arg;
+            });
+          },
+          // outer([1,2,3],[4,5,6])
+          // ===
+          // [[1],[2],[3]] times [[4,5,6]]
+          // ->
+          // [[4,5,6],[8,10,12],[12,15,18]]
+          outer: function outer(A, B) {
+            return jStat4.multiply(A.map(function(t) {
+              return [t];
+            }), [B]);
+          },
+          // Returns the dot product of two matricies
+          dot: function dot(arr, arg) {
+            if (!isUsable(arr[0])) arr = [arr];
+            if (!isUsable(arg[0])) arg = [arg];
+            var left = arr[0].length === 1 && arr.length !== 1 ? jStat4.transpose(arr) : arr, right = arg[0].length === 1 && arg.length !== 1 ? jStat4.transpose(arg) : arg, res = [], row = 0, nrow = left.length, ncol = left[0].length, sum, col;
+            for (; row < nrow; row++) {
+              res[row] = [];
+              sum = 0;
+              for (col = 0; col < ncol; col++)
+                sum += left[row][col] * right[row][col];
+              res[row] = sum;
+            }
+            return res.length === 1 ? res[0] : res;
+          },
+          // raise every element by a scalar
+          pow: function pow(arr, arg) {
+            return jStat4.map(arr, function(value2) {
+              return Math2.pow(value2, arg);
+            });
+          },
+          // exponentiate every element
+          exp: function exp(arr) {
+            return jStat4.map(arr, function(value2) {
+              return Math2.exp(value2);
+            });
+          },
+          // generate the natural log of every element
+          log: function exp(arr) {
+            return jStat4.map(arr, function(value2) {
+              return Math2.log(value2);
+            });
+          },
+          // generate the absolute values of the vector
+          abs: function abs(arr) {
+            return jStat4.map(arr, function(value2) {
+              return Math2.abs(value2);
+            });
+          },
+          // computes the p-norm of the vector
+          // In the case that a matrix is passed, uses the first row as the vector
+          norm: function norm(arr, p) {
+            var nnorm = 0, i2 = 0;
+            if (isNaN(p)) p = 2;
+            if (isUsable(arr[0])) arr = arr[0];
+            for (; i2 < arr.length; i2++) {
+              nnorm += Math2.pow(Math2.abs(arr[i2]), p);
+            }
+            return Math2.pow(nnorm, 1 / p);
+          },
+          // computes the angle between two vectors in rads
+          // In case a matrix is passed, this uses the first row as the vector
+          angle: function angle(arr, arg) {
+            return Math2.acos(jStat4.dot(arr, arg) / (jStat4.norm(arr) * jStat4.norm(arg)));
+          },
+          // augment one matrix by another
+          // Note: this function returns a matrix, not a jStat object
+          aug: function aug(a, b) {
+            var newarr = [];
+            var i2;
+            for (i2 = 0; i2 < a.length; i2++) {
+              newarr.push(a[i2].slice());
+            }
+            for (i2 = 0; i2 < newarr.length; i2++) {
+              push.apply(newarr[i2], b[i2]);
+            }
+            return newarr;
+          },
+          // The inv() function calculates the inverse of a matrix
+          // Create the inverse by augmenting the matrix by the identity matrix of the
+          // appropriate size, and then use G-J elimination on the augmented matrix.
+          inv: function inv(a) {
+            var rows = a.length;
+            var cols = a[0].length;
+            var b = jStat4.identity(rows, cols);
+            var c = jStat4.gauss_jordan(a, b);
+            var result = [];
+            var i2 = 0;
+            var j;
+            for (; i2 < rows; i2++) {
+              result[i2] = [];
+              for (j = cols; j < c[0].length; j++)
+                result[i2][j - cols] = c[i2][j];
+            }
+            return result;
+          },
+          // calculate the determinant of a matrix
+          det: function det(a) {
+            if (a.length === 2) {
+              return a[0][0] * a[1][1] - a[0][1] * a[1][0];
+            }
+            var determinant = 0;
+            for (var i2 = 0; i2 < a.length; i2++) {
+              var submatrix = [];
+              for (var row = 1; row < a.length; row++) {
+                submatrix[row - 1] = [];
+                for (var col = 0; col < a.length; col++) {
+                  if (col < i2) {
+                    submatrix[row - 1][col] = a[row][col];
+                  } else if (col > i2) {
+                    submatrix[row - 1][col - 1] = a[row][col];
+                  }
+                }
+              }
+              var sign = i2 % 2 ? -1 : 1;
+              determinant += det(submatrix) * a[0][i2] * sign;
+            }
+            return determinant;
+          },
+          gauss_elimination: function gauss_elimination(a, b) {
+            var i2 = 0, j = 0, n = a.length, m = a[0].length, factor = 1, sum = 0, x2 = [], maug, pivot, temp, k;
+            a = jStat4.aug(a, b);
+            maug = a[0].length;
+            for (i2 = 0; i2 < n; i2++) {
+              pivot = a[i2][i2];
+              j = i2;
+              for (k = i2 + 1; k < m; k++) {
+                if (pivot < Math2.abs(a[k][i2])) {
+                  pivot = a[k][i2];
+                  j = k;
+                }
+              }
+              if (j != i2) {
+                for (k = 0; k < maug; k++) {
+                  temp = a[i2][k];
+                  a[i2][k] = a[j][k];
+                  a[j][k] = temp;
+                }
+              }
+              for (j = i2 + 1; j < n; j++) {
+                factor = a[j][i2] / a[i2][i2];
+                for (k = i2; k < maug; k++) {
+                  a[j][k] = a[j][k] - factor * a[i2][k];
+                }
+              }
+            }
+            for (i2 = n - 1; i2 >= 0; i2--) {
+              sum = 0;
+              for (j = i2 + 1; j <= n - 1; j++) {
+                sum = sum + x2[j] * a[i2][j];
+              }
+              x2[i2] = (a[i2][maug - 1] - sum) / a[i2][i2];
+            }
+            return x2;
+          },
+          gauss_jordan: function gauss_jordan(a, b) {
+            var m = jStat4.aug(a, b);
+            var h = m.length;
+            var w = m[0].length;
+            var c = 0;
+            var x2, y, y2;
+            for (y = 0; y < h; y++) {
+              var maxrow = y;
+              for (y2 = y + 1; y2 < h; y2++) {
+                if (Math2.abs(m[y2][y]) > Math2.abs(m[maxrow][y]))
+                  maxrow = y2;
+              }
+              var tmp = m[y];
+              m[y] = m[maxrow];
+              m[maxrow] = tmp;
+              for (y2 = y + 1; y2 < h; y2++) {
+                c = m[y2][y] / m[y][y];
+                for (x2 = y; x2 < w; x2++) {
+                  m[y2][x2] -= m[y][x2] * c;
+                }
+              }
+            }
+            for (y = h - 1; y >= 0; y--) {
+              c = m[y][y];
+              for (y2 = 0; y2 < y; y2++) {
+                for (x2 = w - 1; x2 > y - 1; x2--) {
+                  m[y2][x2] -= m[y][x2] * m[y2][y] / c;
+                }
+              }
+              m[y][y] /= c;
+              for (x2 = h; x2 < w; x2++) {
+                m[y][x2] /= c;
+              }
+            }
+            return m;
+          },
+          // solve equation
+          // Ax=b
+          // A is upper triangular matrix
+          // A=[[1,2,3],[0,4,5],[0,6,7]]
+          // b=[1,2,3]
+          // triaUpSolve(A,b) // -> [2.666,0.1666,1.666]
+          // if you use matrix style
+          // A=[[1,2,3],[0,4,5],[0,6,7]]
+          // b=[[1],[2],[3]]
+          // will return [[2.666],[0.1666],[1.666]]
+          triaUpSolve: function triaUpSolve(A, b) {
+            var size = A[0].length;
+            var x2 = jStat4.zeros(1, size)[0];
+            var parts;
+            var matrix_mode = false;
+            if (b[0].length != void 0) {
+              b = b.map(function(i2) {
+                return i2[0];
+              });
+              matrix_mode = true;
+            }
+            jStat4.arange(size - 1, -1, -1).forEach(function(i2) {
+              parts = jStat4.arange(i2 + 1, size).map(function(j) {
+                return x2[j] * A[i2][j];
+              });
+              x2[i2] = (b[i2] - jStat4.sum(parts)) / A[i2][i2];
+            });
+            if (matrix_mode)
+              return x2.map(function(i2) {
+                return [i2];
+              });
+            return x2;
+          },
+          triaLowSolve: function triaLowSolve(A, b) {
+            var size = A[0].length;
+            var x2 = jStat4.zeros(1, size)[0];
+            var parts;
+            var matrix_mode = false;
+            if (b[0].length != void 0) {
+              b = b.map(function(i2) {
+                return i2[0];
+              });
+              matrix_mode = true;
+            }
+            jStat4.arange(size).forEach(function(i2) {
+              parts = jStat4.arange(i2).map(function(j) {
+                return A[i2][j] * x2[j];
+              });
+              x2[i2] = (b[i2] - jStat4.sum(parts)) / A[i2][i2];
+            });
+            if (matrix_mode)
+              return x2.map(function(i2) {
+                return [i2];
+              });
+            return x2;
+          },
+          // A -> [L,U]
+          // A=LU
+          // L is lower triangular matrix
+          // U is upper triangular matrix
+          lu: function lu(A) {
+            var size = A.length;
+            var L = jStat4.identity(size);
+            var R = jStat4.zeros(A.length, A[0].length);
+            var parts;
+            jStat4.arange(size).forEach(function(t) {
+              R[0][t] = A[0][t];
+            });
+            jStat4.arange(1, size).forEach(function(l) {
+              jStat4.arange(l).forEach(function(i2) {
+                parts = jStat4.arange(i2).map(function(jj) {
+                  return L[l][jj] * R[jj][i2];
+                });
+                L[l][i2] = (A[l][i2] - jStat4.sum(parts)) / R[i2][i2];
+              });
+              jStat4.arange(l, size).forEach(function(j) {
+                parts = jStat4.arange(l).map(function(jj) {
+                  return L[l][jj] * R[jj][j];
+                });
+                R[l][j] = A[parts.length][j] - jStat4.sum(parts);
+              });
+            });
+            return [L, R];
+          },
+          // A -> T
+          // A=TT'
+          // T is lower triangular matrix
+          cholesky: function cholesky(A) {
+            var size = A.length;
+            var T = jStat4.zeros(A.length, A[0].length);
+            var parts;
+            jStat4.arange(size).forEach(function(i2) {
+              parts = jStat4.arange(i2).map(function(t) {
+                return Math2.pow(T[i2][t], 2);
+              });
+              T[i2][i2] = Math2.sqrt(A[i2][i2] - jStat4.sum(parts));
+              jStat4.arange(i2 + 1, size).forEach(function(j) {
+                parts = jStat4.arange(i2).map(function(t) {
+                  return T[i2][t] * T[j][t];
+                });
+                T[j][i2] = (A[i2][j] - jStat4.sum(parts)) / T[i2][i2];
+              });
+            });
+            return T;
+          },
+          gauss_jacobi: function gauss_jacobi(a, b, x2, r) {
+            var i2 = 0;
+            var j = 0;
+            var n = a.length;
+            var l = [];
+            var u = [];
+            var d = [];
+            var xv, c, h, xk;
+            for (; i2 < n; i2++) {
+              l[i2] = [];
+              u[i2] = [];
+              d[i2] = [];
+              for (j = 0; j < n; j++) {
+                if (i2 > j) {
+                  l[i2][j] = a[i2][j];
+                  u[i2][j] = d[i2][j] = 0;
+                } else if (i2 < j) {
+                  u[i2][j] = a[i2][j];
+                  l[i2][j] = d[i2][j] = 0;
+                } else {
+                  d[i2][j] = a[i2][j];
+                  l[i2][j] = u[i2][j] = 0;
+                }
+              }
+            }
+            h = jStat4.multiply(jStat4.multiply(jStat4.inv(d), jStat4.add(l, u)), -1);
+            c = jStat4.multiply(jStat4.inv(d), b);
+            xv = x2;
+            xk = jStat4.add(jStat4.multiply(h, x2), c);
+            i2 = 2;
+            while (Math2.abs(jStat4.norm(jStat4.subtract(xk, xv))) > r) {
+              xv = xk;
+              xk = jStat4.add(jStat4.multiply(h, xv), c);
+              i2++;
+            }
+            return xk;
+          },
+          gauss_seidel: function gauss_seidel(a, b, x2, r) {
+            var i2 = 0;
+            var n = a.length;
+            var l = [];
+            var u = [];
+            var d = [];
+            var j, xv, c, h, xk;
+            for (; i2 < n; i2++) {
+              l[i2] = [];
+              u[i2] = [];
+              d[i2] = [];
+              for (j = 0; j < n; j++) {
+                if (i2 > j) {
+                  l[i2][j] = a[i2][j];
+                  u[i2][j] = d[i2][j] = 0;
+                } else if (i2 < j) {
+                  u[i2][j] = a[i2][j];
+                  l[i2][j] = d[i2][j] = 0;
+                } else {
+                  d[i2][j] = a[i2][j];
+                  l[i2][j] = u[i2][j] = 0;
+                }
+              }
+            }
+            h = jStat4.multiply(jStat4.multiply(jStat4.inv(jStat4.add(d, l)), u), -1);
+            c = jStat4.multiply(jStat4.inv(jStat4.add(d, l)), b);
+            xv = x2;
+            xk = jStat4.add(jStat4.multiply(h, x2), c);
+            i2 = 2;
+            while (Math2.abs(jStat4.norm(jStat4.subtract(xk, xv))) > r) {
+              xv = xk;
+              xk = jStat4.add(jStat4.multiply(h, xv), c);
+              i2 = i2 + 1;
+            }
+            return xk;
+          },
+          SOR: function SOR(a, b, x2, r, w) {
+            var i2 = 0;
+            var n = a.length;
+            var l = [];
+            var u = [];
+            var d = [];
+            var j, xv, c, h, xk;
+            for (; i2 < n; i2++) {
+              l[i2] = [];
+              u[i2] = [];
+              d[i2] = [];
+              for (j = 0; j < n; j++) {
+                if (i2 > j) {
+                  l[i2][j] = a[i2][j];
+                  u[i2][j] = d[i2][j] = 0;
+                } else if (i2 < j) {
+                  u[i2][j] = a[i2][j];
+                  l[i2][j] = d[i2][j] = 0;
+                } else {
+                  d[i2][j] = a[i2][j];
+                  l[i2][j] = u[i2][j] = 0;
+                }
+              }
+            }
+            h = jStat4.multiply(
+              jStat4.inv(jStat4.add(d, jStat4.multiply(l, w))),
+              jStat4.subtract(
+                jStat4.multiply(d, 1 - w),
+                jStat4.multiply(u, w)
+              )
+            );
+            c = jStat4.multiply(jStat4.multiply(jStat4.inv(jStat4.add(
+              d,
+              jStat4.multiply(l, w)
+            )), b), w);
+            xv = x2;
+            xk = jStat4.add(jStat4.multiply(h, x2), c);
+            i2 = 2;
+            while (Math2.abs(jStat4.norm(jStat4.subtract(xk, xv))) > r) {
+              xv = xk;
+              xk = jStat4.add(jStat4.multiply(h, xv), c);
+              i2++;
+            }
+            return xk;
+          },
+          householder: function householder(a) {
+            var m = a.length;
+            var n = a[0].length;
+            var i2 = 0;
+            var w = [];
+            var p = [];
+            var alpha, r, k, j, factor;
+            for (; i2 < m - 1; i2++) {
+              alpha = 0;
+              for (j = i2 + 1; j < n; j++)
+                alpha += a[j][i2] * a[j][i2];
+              factor = a[i2 + 1][i2] > 0 ? -1 : 1;
+              alpha = factor * Math2.sqrt(alpha);
+              r = Math2.sqrt((alpha * alpha - a[i2 + 1][i2] * alpha) / 2);
+              w = jStat4.zeros(m, 1);
+              w[i2 + 1][0] = (a[i2 + 1][i2] - alpha) / (2 * r);
+              for (k = i2 + 2; k < m; k++) w[k][0] = a[k][i2] / (2 * r);
+              p = jStat4.subtract(
+                jStat4.identity(m, n),
+                jStat4.multiply(jStat4.multiply(w, jStat4.transpose(w)), 2)
+              );
+              a = jStat4.multiply(p, jStat4.multiply(a, p));
+            }
+            return a;
+          },
+          // A -> [Q,R]
+          // Q is orthogonal matrix
+          // R is upper triangular
+          QR: (function() {
+            var sum = jStat4.sum;
+            var range = jStat4.arange;
+            function qr2(x2) {
+              var n = x2.length;
+              var p = x2[0].length;
+              var r = jStat4.zeros(p, p);
+              x2 = jStat4.copy(x2);
+              var i2, j, k;
+              for (j = 0; j < p; j++) {
+                r[j][j] = Math2.sqrt(sum(range(n).map(function(i3) {
+                  return x2[i3][j] * x2[i3][j];
+                })));
+                for (i2 = 0; i2 < n; i2++) {
+                  x2[i2][j] = x2[i2][j] / r[j][j];
+                }
+                for (k = j + 1; k < p; k++) {
+                  r[j][k] = sum(range(n).map(function(i3) {
+                    return x2[i3][j] * x2[i3][k];
+                  }));
+                  for (i2 = 0; i2 < n; i2++) {
+                    x2[i2][k] = x2[i2][k] - x2[i2][j] * r[j][k];
+                  }
+                }
+              }
+              return [x2, r];
+            }
+            return qr2;
+          })(),
+          lstsq: /* @__PURE__ */ (function() {
+            function R_I(A) {
+              A = jStat4.copy(A);
+              var size = A.length;
+              var I = jStat4.identity(size);
+              jStat4.arange(size - 1, -1, -1).forEach(function(i2) {
+                jStat4.sliceAssign(
+                  I,
+                  { row: i2 },
+                  jStat4.divide(jStat4.slice(I, { row: i2 }), A[i2][i2])
+                );
+                jStat4.sliceAssign(
+                  A,
+                  { row: i2 },
+                  jStat4.divide(jStat4.slice(A, { row: i2 }), A[i2][i2])
+                );
+                jStat4.arange(i2).forEach(function(j) {
+                  var c = jStat4.multiply(A[j][i2], -1);
+                  var Aj = jStat4.slice(A, { row: j });
+                  var cAi = jStat4.multiply(jStat4.slice(A, { row: i2 }), c);
+                  jStat4.sliceAssign(A, { row: j }, jStat4.add(Aj, cAi));
+                  var Ij = jStat4.slice(I, { row: j });
+                  var cIi = jStat4.multiply(jStat4.slice(I, { row: i2 }), c);
+                  jStat4.sliceAssign(I, { row: j }, jStat4.add(Ij, cIi));
+                });
+              });
+              return I;
+            }
+            function qr_solve(A, b) {
+              var array_mode = false;
+              if (b[0].length === void 0) {
+                b = b.map(function(x3) {
+                  return [x3];
+                });
+                array_mode = true;
+              }
+              var QR = jStat4.QR(A);
+              var Q = QR[0];
+              var R = QR[1];
+              var attrs = A[0].length;
+              var Q1 = jStat4.slice(Q, { col: { end: attrs } });
+              var R1 = jStat4.slice(R, { row: { end: attrs } });
+              var RI = R_I(R1);
+              var Q2 = jStat4.transpose(Q1);
+              if (Q2[0].length === void 0) {
+                Q2 = [Q2];
+              }
+              var x2 = jStat4.multiply(jStat4.multiply(RI, Q2), b);
+              if (x2.length === void 0) {
+                x2 = [[x2]];
+              }
+              if (array_mode)
+                return x2.map(function(i2) {
+                  return i2[0];
+                });
+              return x2;
+            }
+            return qr_solve;
+          })(),
+          jacobi: function jacobi(a) {
+            var condition = 1;
+            var n = a.length;
+            var e = jStat4.identity(n, n);
+            var ev = [];
+            var b, i2, j, p, q, maxim, theta, s;
+            while (condition === 1) {
+              maxim = a[0][1];
+              p = 0;
+              q = 1;
+              for (i2 = 0; i2 < n; i2++) {
+                for (j = 0; j < n; j++) {
+                  if (i2 != j) {
+                    if (maxim < Math2.abs(a[i2][j])) {
+                      maxim = Math2.abs(a[i2][j]);
+                      p = i2;
+                      q = j;
+                    }
+                  }
+                }
+              }
+              if (a[p][p] === a[q][q])
+                theta = a[p][q] > 0 ? Math2.PI / 4 : -Math2.PI / 4;
+              else
+                theta = Math2.atan(2 * a[p][q] / (a[p][p] - a[q][q])) / 2;
+              s = jStat4.identity(n, n);
+              s[p][p] = Math2.cos(theta);
+              s[p][q] = -Math2.sin(theta);
+              s[q][p] = Math2.sin(theta);
+              s[q][q] = Math2.cos(theta);
+              e = jStat4.multiply(e, s);
+              b = jStat4.multiply(jStat4.multiply(jStat4.inv(s), a), s);
+              a = b;
+              condition = 0;
+              for (i2 = 1; i2 < n; i2++) {
+                for (j = 1; j < n; j++) {
+                  if (i2 != j && Math2.abs(a[i2][j]) > 1e-3) {
+                    condition = 1;
+                  }
+                }
+              }
+            }
+            for (i2 = 0; i2 < n; i2++) ev.push(a[i2][i2]);
+            return [e, ev];
+          },
+          rungekutta: function rungekutta(f, h, p, t_j, u_j, order) {
+            var k1, k2, u_j1, k3, k4;
+            if (order === 2) {
+              while (t_j <= p) {
+                k1 = h * f(t_j, u_j);
+                k2 = h * f(t_j + h, u_j + k1);
+                u_j1 = u_j + (k1 + k2) / 2;
+                u_j = u_j1;
+                t_j = t_j + h;
+              }
+            }
+            if (order === 4) {
+              while (t_j <= p) {
+                k1 = h * f(t_j, u_j);
+                k2 = h * f(t_j + h / 2, u_j + k1 / 2);
+                k3 = h * f(t_j + h / 2, u_j + k2 / 2);
+                k4 = h * f(t_j + h, u_j + k3);
+                u_j1 = u_j + (k1 + 2 * k2 + 2 * k3 + k4) / 6;
+                u_j = u_j1;
+                t_j = t_j + h;
+              }
+            }
+            return u_j;
+          },
+          romberg: function romberg(f, a, b, order) {
+            var i2 = 0;
+            var h = (b - a) / 2;
+            var x2 = [];
+            var h1 = [];
+            var g = [];
+            var m, a1, j, k, I;
+            while (i2 < order / 2) {
+              I = f(a);
+              for (j = a, k = 0; j <= b; j = j + h, k++) x2[k] = j;
+              m = x2.length;
+              for (j = 1; j < m - 1; j++) {
+                I += (j % 2 !== 0 ? 4 : 2) * f(x2[j]);
+              }
+              I = h / 3 * (I + f(b));
+              g[i2] = I;
+              h /= 2;
+              i2++;
+            }
+            a1 = g.length;
+            m = 1;
+            while (a1 !== 1) {
+              for (j = 0; j < a1 - 1; j++)
+                h1[j] = (Math2.pow(4, m) * g[j + 1] - g[j]) / (Math2.pow(4, m) - 1);
+              a1 = h1.length;
+              g = h1;
+              h1 = [];
+              m++;
+            }
+            return g;
+          },
+          richardson: function richardson(X, f, x2, h) {
+            function pos(X2, x3) {
+              var i3 = 0;
+              var n = X2.length;
+              var p;
+              for (; i3 < n; i3++)
+                if (X2[i3] === x3) p = i3;
+              return p;
+            }
+            var h_min = Math2.abs(x2 - X[pos(X, x2) + 1]);
+            var i2 = 0;
+            var g = [];
+            var h1 = [];
+            var y1, y2, m, a, j;
+            while (h >= h_min) {
+              y1 = pos(X, x2 + h);
+              y2 = pos(X, x2);
+              g[i2] = (f[y1] - 2 * f[y2] + f[2 * y2 - y1]) / (h * h);
+              h /= 2;
+              i2++;
+            }
+            a = g.length;
+            m = 1;
+            while (a != 1) {
+              for (j = 0; j < a - 1; j++)
+                h1[j] = (Math2.pow(4, m) * g[j + 1] - g[j]) / (Math2.pow(4, m) - 1);
+              a = h1.length;
+              g = h1;
+              h1 = [];
+              m++;
+            }
+            return g;
+          },
+          simpson: function simpson(f, a, b, n) {
+            var h = (b - a) / n;
+            var I = f(a);
+            var x2 = [];
+            var j = a;
+            var k = 0;
+            var i2 = 1;
+            var m;
+            for (; j <= b; j = j + h, k++)
+              x2[k] = j;
+            m = x2.length;
+            for (; i2 < m - 1; i2++) {
+              I += (i2 % 2 !== 0 ? 4 : 2) * f(x2[i2]);
+            }
+            return h / 3 * (I + f(b));
+          },
+          hermite: function hermite(X, F, dF, value2) {
+            var n = X.length;
+            var p = 0;
+            var i2 = 0;
+            var l = [];
+            var dl = [];
+            var A = [];
+            var B = [];
+            var j;
+            for (; i2 < n; i2++) {
+              l[i2] = 1;
+              for (j = 0; j < n; j++) {
+                if (i2 != j) l[i2] *= (value2 - X[j]) / (X[i2] - X[j]);
+              }
+              dl[i2] = 0;
+              for (j = 0; j < n; j++) {
+                if (i2 != j) dl[i2] += 1 / (X[i2] - X[j]);
+              }
+              A[i2] = (1 - 2 * (value2 - X[i2]) * dl[i2]) * (l[i2] * l[i2]);
+              B[i2] = (value2 - X[i2]) * (l[i2] * l[i2]);
+              p += A[i2] * F[i2] + B[i2] * dF[i2];
+            }
+            return p;
+          },
+          lagrange: function lagrange(X, F, value2) {
+            var p = 0;
+            var i2 = 0;
+            var j, l;
+            var n = X.length;
+            for (; i2 < n; i2++) {
+              l = F[i2];
+              for (j = 0; j < n; j++) {
+                if (i2 != j) l *= (value2 - X[j]) / (X[i2] - X[j]);
+              }
+              p += l;
+            }
+            return p;
+          },
+          cubic_spline: function cubic_spline(X, F, value2) {
+            var n = X.length;
+            var i2 = 0, j;
+            var A = [];
+            var B = [];
+            var alpha = [];
+            var c = [];
+            var h = [];
+            var b = [];
+            var d = [];
+            for (; i2 < n - 1; i2++)
+              h[i2] = X[i2 + 1] - X[i2];
+            alpha[0] = 0;
+            for (i2 = 1; i2 < n - 1; i2++) {
+              alpha[i2] = 3 / h[i2] * (F[i2 + 1] - F[i2]) - 3 / h[i2 - 1] * (F[i2] - F[i2 - 1]);
+            }
+            for (i2 = 1; i2 < n - 1; i2++) {
+              A[i2] = [];
+              B[i2] = [];
+              A[i2][i2 - 1] = h[i2 - 1];
+              A[i2][i2] = 2 * (h[i2 - 1] + h[i2]);
+              A[i2][i2 + 1] = h[i2];
+              B[i2][0] = alpha[i2];
+            }
+            c = jStat4.multiply(jStat4.inv(A), B);
+            for (j = 0; j < n - 1; j++) {
+              b[j] = (F[j + 1] - F[j]) / h[j] - h[j] * (c[j + 1][0] + 2 * c[j][0]) / 3;
+              d[j] = (c[j + 1][0] - c[j][0]) / (3 * h[j]);
+            }
+            for (j = 0; j < n; j++) {
+              if (X[j] > value2) break;
+            }
+            j -= 1;
+            return F[j] + (value2 - X[j]) * b[j] + jStat4.sq(value2 - X[j]) * c[j] + (value2 - X[j]) * jStat4.sq(value2 - X[j]) * d[j];
+          },
+          gauss_quadrature: function gauss_quadrature() {
+            throw new Error("gauss_quadrature not yet implemented");
+          },
+          PCA: function PCA(X) {
+            var m = X.length;
+            var n = X[0].length;
+            var i2 = 0;
+            var j, temp1;
+            var u = [];
+            var D = [];
+            var result = [];
+            var temp2 = [];
+            var Y = [];
+            var Bt = [];
+            var B = [];
+            var C = [];
+            var V = [];
+            var Vt = [];
+            for (i2 = 0; i2 < m; i2++) {
+              u[i2] = jStat4.sum(X[i2]) / n;
+            }
+            for (i2 = 0; i2 < n; i2++) {
+              B[i2] = [];
+              for (j = 0; j < m; j++) {
+                B[i2][j] = X[j][i2] - u[j];
+              }
+            }
+            B = jStat4.transpose(B);
+            for (i2 = 0; i2 < m; i2++) {
+              C[i2] = [];
+              for (j = 0; j < m; j++) {
+                C[i2][j] = jStat4.dot([B[i2]], [B[j]]) / (n - 1);
+              }
+            }
+            result = jStat4.jacobi(C);
+            V = result[0];
+            D = result[1];
+            Vt = jStat4.transpose(V);
+            for (i2 = 0; i2 < D.length; i2++) {
+              for (j = i2; j < D.length; j++) {
+                if (D[i2] < D[j]) {
+                  temp1 = D[i2];
+                  D[i2] = D[j];
+                  D[j] = temp1;
+                  temp2 = Vt[i2];
+                  Vt[i2] = Vt[j];
+                  Vt[j] = temp2;
+                }
+              }
+            }
+            Bt = jStat4.transpose(B);
+            for (i2 = 0; i2 < m; i2++) {
+              Y[i2] = [];
+              for (j = 0; j < Bt.length; j++) {
+                Y[i2][j] = jStat4.dot([Vt[i2]], [Bt[j]]);
+              }
+            }
+            return [X, D, Vt, Y];
+          }
+        });
+        (function(funcs) {
+          for (var i2 = 0; i2 < funcs.length; i2++) (function(passfunc) {
+            jStat4.fn[passfunc] = function(arg, func) {
+              var tmpthis = this;
+              if (func) {
+                setTimeout(function() {
+                  func.call(tmpthis, jStat4.fn[passfunc].call(tmpthis, arg));
+                }, 15);
+                return this;
+              }
+              if (typeof jStat4[passfunc](this, arg) === "number")
+                return jStat4[passfunc](this, arg);
+              else
+                return jStat4(jStat4[passfunc](this, arg));
+            };
+          })(funcs[i2]);
+        })("add divide multiply subtract dot pow exp log abs norm angle".split(" "));
+      })(jStat3, Math);
+      (function(jStat4, Math2) {
+        var slice = [].slice;
+        var isNumber = jStat4.utils.isNumber;
+        var isArray = jStat4.utils.isArray;
+        jStat4.extend({
+          // 2 different parameter lists:
+          // (value, mean, sd)
+          // (value, array, flag)
+          zscore: function zscore() {
+            var args = slice.call(arguments);
+            if (isNumber(args[1])) {
+              return (args[0] - args[1]) / args[2];
+            }
+            return (args[0] - jStat4.mean(args[1])) / jStat4.stdev(args[1], args[2]);
+          },
+          // 3 different paramter lists:
+          // (value, mean, sd, sides)
+          // (zscore, sides)
+          // (value, array, sides, flag)
+          ztest: function ztest() {
+            var args = slice.call(arguments);
+            var z;
+            if (isArray(args[1])) {
+              z = jStat4.zscore(args[0], args[1], args[3]);
+              return args[2] === 1 ? jStat4.normal.cdf(-Math2.abs(z), 0, 1) : jStat4.normal.cdf(-Math2.abs(z), 0, 1) * 2;
+            } else {
+              if (args.length > 2) {
+                z = jStat4.zscore(args[0], args[1], args[2]);
+                return args[3] === 1 ? jStat4.normal.cdf(-Math2.abs(z), 0, 1) : jStat4.normal.cdf(-Math2.abs(z), 0, 1) * 2;
+              } else {
+                z = args[0];
+                return args[1] === 1 ? jStat4.normal.cdf(-Math2.abs(z), 0, 1) : jStat4.normal.cdf(-Math2.abs(z), 0, 1) * 2;
+              }
+            }
+          }
+        });
+        jStat4.extend(jStat4.fn, {
+          zscore: function zscore(value2, flag) {
+            return (value2 - this.mean()) / this.stdev(flag);
+          },
+          ztest: function ztest(value2, sides, flag) {
+            var zscore = Math2.abs(this.zscore(value2, flag));
+            return sides === 1 ? jStat4.normal.cdf(-zscore, 0, 1) : jStat4.normal.cdf(-zscore, 0, 1) * 2;
+          }
+        });
+        jStat4.extend({
+          // 2 parameter lists
+          // (value, mean, sd, n)
+          // (value, array)
+          tscore: function tscore() {
+            var args = slice.call(arguments);
+            return args.length === 4 ? (args[0] - args[1]) / (args[2] / Math2.sqrt(args[3])) : (args[0] - jStat4.mean(args[1])) / (jStat4.stdev(args[1], true) / Math2.sqrt(args[1].length));
+          },
+          // 3 different paramter lists:
+          // (value, mean, sd, n, sides)
+          // (tscore, n, sides)
+          // (value, array, sides)
+          ttest: function ttest() {
+            var args = slice.call(arguments);
+            var tscore;
+            if (args.length === 5) {
+              tscore = Math2.abs(jStat4.tscore(args[0], args[1], args[2], args[3]));
+              return args[4] === 1 ? jStat4.studentt.cdf(-tscore, args[3] - 1) : jStat4.studentt.cdf(-tscore, args[3] - 1) * 2;
+            }
+            if (isNumber(args[1])) {
+              tscore = Math2.abs(args[0]);
+              return args[2] == 1 ? jStat4.studentt.cdf(-tscore, args[1] - 1) : jStat4.studentt.cdf(-tscore, args[1] - 1) * 2;
+            }
+            tscore = Math2.abs(jStat4.tscore(args[0], args[1]));
+            return args[2] == 1 ? jStat4.studentt.cdf(-tscore, args[1].length - 1) : jStat4.studentt.cdf(-tscore, args[1].length - 1) * 2;
+          }
+        });
+        jStat4.extend(jStat4.fn, {
+          tscore: function tscore(value2) {
+            return (value2 - this.mean()) / (this.stdev(true) / Math2.sqrt(this.cols()));
+          },
+          ttest: function ttest(value2, sides) {
+            return sides === 1 ? 1 - jStat4.studentt.cdf(Math2.abs(this.tscore(value2)), this.cols() - 1) : jStat4.studentt.cdf(-Math2.abs(this.tscore(value2)), this.cols() - 1) * 2;
+          }
+        });
+        jStat4.extend({
+          // Paramter list is as follows:
+          // (array1, array2, array3, ...)
+          // or it is an array of arrays
+          // array of arrays conversion
+          anovafscore: function anovafscore() {
+            var args = slice.call(arguments), expVar, sample, sampMean, sampSampMean, tmpargs, unexpVar, i2, j;
+            if (args.length === 1) {
+              tmpargs = new Array(args[0].length);
+              for (i2 = 0; i2 < args[0].length; i2++) {
+                tmpargs[i2] = args[0][i2];
+              }
+              args = tmpargs;
+            }
+            sample = new Array();
+            for (i2 = 0; i2 < args.length; i2++) {
+              sample = sample.concat(args[i2]);
+            }
+            sampMean = jStat4.mean(sample);
+            expVar = 0;
+            for (i2 = 0; i2 < args.length; i2++) {
+              expVar = expVar + args[i2].length * Math2.pow(jStat4.mean(args[i2]) - sampMean, 2);
+            }
+            expVar /= args.length - 1;
+            unexpVar = 0;
+            for (i2 = 0; i2 < args.length; i2++) {
+              sampSampMean = jStat4.mean(args[i2]);
+              for (j = 0; j < args[i2].length; j++) {
+                unexpVar += Math2.pow(args[i2][j] - sampSampMean, 2);
+              }
+            }
+            unexpVar /= sample.length - args.length;
+            return expVar / unexpVar;
+          },
+          // 2 different paramter setups
+          // (array1, array2, array3, ...)
+          // (anovafscore, df1, df2)
+          anovaftest: function anovaftest() {
+            var args = slice.call(arguments), df1, df2, n, i2;
+            if (isNumber(args[0])) {
+              return 1 - jStat4.centralF.cdf(args[0], args[1], args[2]);
+            }
+            var anovafscore = jStat4.anovafscore(args);
+            df1 = args.length - 1;
+            n = 0;
+            for (i2 = 0; i2 < args.length; i2++) {
+              n = n + args[i2].length;
+            }
+            df2 = n - df1 - 1;
+            return 1 - jStat4.centralF.cdf(anovafscore, df1, df2);
+          },
+          ftest: function ftest(fscore, df1, df2) {
+            return 1 - jStat4.centralF.cdf(fscore, df1, df2);
+          }
+        });
+        jStat4.extend(jStat4.fn, {
+          anovafscore: function anovafscore() {
+            return jStat4.anovafscore(this.toArray());
+          },
+          anovaftes: function anovaftes() {
+            var n = 0;
+            var i2;
+            for (i2 = 0; i2 < this.length; i2++) {
+              n = n + this[i2].length;
+            }
+            return jStat4.ftest(this.anovafscore(), this.length - 1, n - this.length);
+          }
+        });
+        jStat4.extend({
+          // 2 parameter lists
+          // (mean1, mean2, n1, n2, sd)
+          // (array1, array2, sd)
+          qscore: function qscore() {
+            var args = slice.call(arguments);
+            var mean1, mean2, n1, n2, sd;
+            if (isNumber(args[0])) {
+              mean1 = args[0];
+              mean2 = args[1];
+              n1 = args[2];
+              n2 = args[3];
+              sd = args[4];
+            } else {
+              mean1 = jStat4.mean(args[0]);
+              mean2 = jStat4.mean(args[1]);
+              n1 = args[0].length;
+              n2 = args[1].length;
+              sd = args[2];
+            }
+            return Math2.abs(mean1 - mean2) / (sd * Math2.sqrt((1 / n1 + 1 / n2) / 2));
+          },
+          // 3 different parameter lists:
+          // (qscore, n, k)
+          // (mean1, mean2, n1, n2, sd, n, k)
+          // (array1, array2, sd, n, k)
+          qtest: function qtest() {
+            var args = slice.call(arguments);
+            var qscore;
+            if (args.length === 3) {
+              qscore = args[0];
+              args = args.slice(1);
+            } else if (args.length === 7) {
+              qscore = jStat4.qscore(args[0], args[1], args[2], args[3], args[4]);
+              args = args.slice(5);
+            } else {
+              qscore = jStat4.qscore(args[0], args[1], args[2]);
+              args = args.slice(3);
+            }
+            var n = args[0];
+            var k = args[1];
+            return 1 - jStat4.tukey.cdf(qscore, k, n - k);
+          },
+          tukeyhsd: function tukeyhsd(arrays) {
+            var sd = jStat4.pooledstdev(arrays);
+            var means = arrays.map(function(arr) {
+              return jStat4.mean(arr);
+            });
+            var n = arrays.reduce(function(n2, arr) {
+              return n2 + arr.length;
+            }, 0);
+            var results = [];
+            for (var i2 = 0; i2 < arrays.length; ++i2) {
+              for (var j = i2 + 1; j < arrays.length; ++j) {
+                var p = jStat4.qtest(means[i2], means[j], arrays[i2].length, arrays[j].length, sd, n, arrays.length);
+                results.push([[i2, j], p]);
+              }
+            }
+            return results;
+          }
+        });
+        jStat4.extend({
+          // 2 different parameter setups
+          // (value, alpha, sd, n)
+          // (value, alpha, array)
+          normalci: function normalci() {
+            var args = slice.call(arguments), ans = new Array(2), change2;
+            if (args.length === 4) {
+              change2 = Math2.abs(jStat4.normal.inv(args[1] / 2, 0, 1) * args[2] / Math2.sqrt(args[3]));
+            } else {
+              change2 = Math2.abs(jStat4.normal.inv(args[1] / 2, 0, 1) * jStat4.stdev(args[2]) / Math2.sqrt(args[2].length));
+            }
+            ans[0] = args[0] - change2;
+            ans[1] = args[0] + change2;
+            return ans;
+          },
+          // 2 different parameter setups
+          // (value, alpha, sd, n)
+          // (value, alpha, array)
+          tci: function tci() {
+            var args = slice.call(arguments), ans = new Array(2), change2;
+            if (args.length === 4) {
+              change2 = Math2.abs(jStat4.studentt.inv(args[1] / 2, args[3] - 1) * args[2] / Math2.sqrt(args[3]));
+            } else {
+              change2 = Math2.abs(jStat4.studentt.inv(args[1] / 2, args[2].length - 1) * jStat4.stdev(args[2], true) / Math2.sqrt(args[2].length));
+            }
+            ans[0] = args[0] - change2;
+            ans[1] = args[0] + change2;
+            return ans;
+          },
+          significant: function significant(pvalue, alpha) {
+            return pvalue < alpha;
+          }
+        });
+        jStat4.extend(jStat4.fn, {
+          normalci: function normalci(value2, alpha) {
+            return jStat4.normalci(value2, alpha, this.toArray());
+          },
+          tci: function tci(value2, alpha) {
+            return jStat4.tci(value2, alpha, this.toArray());
+          }
+        });
+        function differenceOfProportions(p1, n1, p2, n2) {
+          if (p1 > 1 || p2 > 1 || p1 <= 0 || p2 <= 0) {
+            throw new Error("Proportions should be greater than 0 and less than 1");
+          }
+          var pooled = (p1 * n1 + p2 * n2) / (n1 + n2);
+          var se = Math2.sqrt(pooled * (1 - pooled) * (1 / n1 + 1 / n2));
+          return (p1 - p2) / se;
+        }
+        jStat4.extend(jStat4.fn, {
+          oneSidedDifferenceOfProportions: function oneSidedDifferenceOfProportions(p1, n1, p2, n2) {
+            var z = differenceOfProportions(p1, n1, p2, n2);
+            return jStat4.ztest(z, 1);
+          },
+          twoSidedDifferenceOfProportions: function twoSidedDifferenceOfProportions(p1, n1, p2, n2) {
+            var z = differenceOfProportions(p1, n1, p2, n2);
+            return jStat4.ztest(z, 2);
+          }
+        });
+      })(jStat3, Math);
+      jStat3.models = /* @__PURE__ */ (function() {
+        function sub_regress(exog) {
+          var var_count = exog[0].length;
+          var modelList = jStat3.arange(var_count).map(function(endog_index) {
+            var exog_index = jStat3.arange(var_count).filter(function(i2) {
+              return i2 !== endog_index;
+            });
+            return ols(
+              jStat3.col(exog, endog_index).map(function(x2) {
+                return x2[0];
+              }),
+              jStat3.col(exog, exog_index)
+            );
+          });
+          return modelList;
+        }
+        function ols(endog, exog) {
+          var nobs = endog.length;
+          var df_model = exog[0].length - 1;
+          var df_resid = nobs - df_model - 1;
+          var coef = jStat3.lstsq(exog, endog);
+          var predict = jStat3.multiply(exog, coef.map(function(x2) {
+            return [x2];
+          })).map(function(p) {
+            return p[0];
+          });
+          var resid = jStat3.subtract(endog, predict);
+          var ybar = jStat3.mean(endog);
+          var SSE = jStat3.sum(predict.map(function(f) {
+            return Math.pow(f - ybar, 2);
+          }));
+          var SSR = jStat3.sum(endog.map(function(y, i2) {
+            return Math.pow(y - predict[i2], 2);
+          }));
+          var SST = SSE + SSR;
+          var R2 = SSE / SST;
+          return {
+            exog,
+            endog,
+            nobs,
+            df_model,
+            df_resid,
+            coef,
+            predict,
+            resid,
+            ybar,
+            SST,
+            SSE,
+            SSR,
+            R2
+          };
+        }
+        function t_test(model) {
+          var subModelList = sub_regress(model.exog);
+          var sigmaHat = Math.sqrt(model.SSR / model.df_resid);
+          var seBetaHat = subModelList.map(function(mod) {
+            var SST = mod.SST;
+            var R2 = mod.R2;
+            return sigmaHat / Math.sqrt(SST * (1 - R2));
+          });
+          var tStatistic = model.coef.map(function(coef, i2) {
+            return (coef - 0) / seBetaHat[i2];
+          });
+          var pValue = tStatistic.map(function(t) {
+            var leftppf = jStat3.studentt.cdf(t, model.df_resid);
+            return (leftppf > 0.5 ? 1 - leftppf : leftppf) * 2;
+          });
+          var c = jStat3.studentt.inv(0.975, model.df_resid);
+          var interval95 = model.coef.map(function(coef, i2) {
+            var d = c * seBetaHat[i2];
+            return [coef - d, coef + d];
+          });
+          return {
+            se: seBetaHat,
+            t: tStatistic,
+            p: pValue,
+            sigmaHat,
+            interval95
+          };
+        }
+        function F_test(model) {
+          var F_statistic = model.R2 / model.df_model / ((1 - model.R2) / model.df_resid);
+          var fcdf = function(x2, n1, n2) {
+            return jStat3.beta.cdf(x2 / (n2 / n1 + x2), n1 / 2, n2 / 2);
+          };
+          var pvalue = 1 - fcdf(F_statistic, model.df_model, model.df_resid);
+          return { F_statistic, pvalue };
+        }
+        function ols_wrap(endog, exog) {
+          var model = ols(endog, exog);
+          var ttest = t_test(model);
+          var ftest = F_test(model);
+          var adjust_R2 = 1 - (1 - model.R2) * ((model.nobs - 1) / model.df_resid);
+          model.t = ttest;
+          model.f = ftest;
+          model.adjust_R2 = adjust_R2;
+          return model;
+        }
+        return { ols: ols_wrap };
+      })();
+      jStat3.extend({
+        buildxmatrix: function buildxmatrix() {
+          var matrixRows = new Array(arguments.length);
+          for (var i2 = 0; i2 < arguments.length; i2++) {
+            var array = [1];
+            matrixRows[i2] = array.concat(arguments[i2]);
+          }
+          return jStat3(matrixRows);
+        },
+        builddxmatrix: function builddxmatrix() {
+          var matrixRows = new Array(arguments[0].length);
+          for (var i2 = 0; i2 < arguments[0].length; i2++) {
+            var array = [1];
+            matrixRows[i2] = array.concat(arguments[0][i2]);
+          }
+          return jStat3(matrixRows);
+        },
+        buildjxmatrix: function buildjxmatrix(jMat) {
+          var pass = new Array(jMat.length);
+          for (var i2 = 0; i2 < jMat.length; i2++) {
+            pass[i2] = jMat[i2];
+          }
+          return jStat3.builddxmatrix(pass);
+        },
+        buildymatrix: function buildymatrix(array) {
+          return jStat3(array).transpose();
+        },
+        buildjymatrix: function buildjymatrix(jMat) {
+          return jMat.transpose();
+        },
+        matrixmult: function matrixmult(A, B) {
+          var i2, j, k, result, sum;
+          if (A.cols() == B.rows()) {
+            if (B.rows() > 1) {
+              result = [];
+              for (i2 = 0; i2 < A.rows(); i2++) {
+                result[i2] = [];
+                for (j = 0; j < B.cols(); j++) {
+                  sum = 0;
+                  for (k = 0; k < A.cols(); k++) {
+                    sum += A.toArray()[i2][k] * B.toArray()[k][j];
+                  }
+                  result[i2][j] = sum;
+                }
+              }
+              return jStat3(result);
+            }
+            result = [];
+            for (i2 = 0; i2 < A.rows(); i2++) {
+              result[i2] = [];
+              for (j = 0; j < B.cols(); j++) {
+                sum = 0;
+                for (k = 0; k < A.cols(); k++) {
+                  sum += A.toArray()[i2][k] * B.toArray()[j];
+                }
+                result[i2][j] = sum;
+              }
+            }
+            return jStat3(result);
+          }
+        },
+        //regress and regresst to be fixed
+        regress: function regress(jMatX, jMatY) {
+          var innerinv = jStat3.xtranspxinv(jMatX);
+          var xtransp = jMatX.transpose();
+          var next = jStat3.matrixmult(jStat3(innerinv), xtransp);
+          return jStat3.matrixmult(next, jMatY);
+        },
+        regresst: function regresst(jMatX, jMatY, sides) {
+          var beta = jStat3.regress(jMatX, jMatY);
+          var compile = {};
+          compile.anova = {};
+          var jMatYBar = jStat3.jMatYBar(jMatX, beta);
+          compile.yBar = jMatYBar;
+          var yAverage = jMatY.mean();
+          compile.anova.residuals = jStat3.residuals(jMatY, jMatYBar);
+          compile.anova.ssr = jStat3.ssr(jMatYBar, yAverage);
+          compile.anova.msr = compile.anova.ssr / (jMatX[0].length - 1);
+          compile.anova.sse = jStat3.sse(jMatY, jMatYBar);
+          compile.anova.mse = compile.anova.sse / (jMatY.length - (jMatX[0].length - 1) - 1);
+          compile.anova.sst = jStat3.sst(jMatY, yAverage);
+          compile.anova.mst = compile.anova.sst / (jMatY.length - 1);
+          compile.anova.r2 = 1 - compile.anova.sse / compile.anova.sst;
+          if (compile.anova.r2 < 0) compile.anova.r2 = 0;
+          compile.anova.fratio = compile.anova.msr / compile.anova.mse;
+          compile.anova.pvalue = jStat3.anovaftest(
+            compile.anova.fratio,
+            jMatX[0].length - 1,
+            jMatY.length - (jMatX[0].length - 1) - 1
+          );
+          compile.anova.rmse = Math.sqrt(compile.anova.mse);
+          compile.anova.r2adj = 1 - compile.anova.mse / compile.anova.mst;
+          if (compile.anova.r2adj < 0) compile.anova.r2adj = 0;
+          compile.stats = new Array(jMatX[0].length);
+          var covar = jStat3.xtranspxinv(jMatX);
+          var sds, ts, ps;
+          for (var i2 = 0; i2 < beta.length; i2++) {
+            sds = Math.sqrt(compile.anova.mse * Math.abs(covar[i2][i2]));
+            ts = Math.abs(beta[i2] / sds);
+            ps = jStat3.ttest(ts, jMatY.length - jMatX[0].length - 1, sides);
+            compile.stats[i2] = [beta[i2], sds, ts, ps];
+          }
+          compile.regress = beta;
+          return compile;
+        },
+        xtranspx: function xtranspx(jMatX) {
+          return jStat3.matrixmult(jMatX.transpose(), jMatX);
+        },
+        xtranspxinv: function xtranspxinv(jMatX) {
+          var inner = jStat3.matrixmult(jMatX.transpose(), jMatX);
+          var innerinv = jStat3.inv(inner);
+          return innerinv;
+        },
+        jMatYBar: function jMatYBar(jMatX, beta) {
+          var yBar = jStat3.matrixmult(jMatX, beta);
+          return new jStat3(yBar);
+        },
+        residuals: function residuals(jMatY, jMatYBar) {
+          return jStat3.matrixsubtract(jMatY, jMatYBar);
+        },
+        ssr: function ssr(jMatYBar, yAverage) {
+          var ssr2 = 0;
+          for (var i2 = 0; i2 < jMatYBar.length; i2++) {
+            ssr2 += Math.pow(jMatYBar[i2] - yAverage, 2);
+          }
+          return ssr2;
+        },
+        sse: function sse(jMatY, jMatYBar) {
+          var sse2 = 0;
+          for (var i2 = 0; i2 < jMatY.length; i2++) {
+            sse2 += Math.pow(jMatY[i2] - jMatYBar[i2], 2);
+          }
+          return sse2;
+        },
+        sst: function sst(jMatY, yAverage) {
+          var sst2 = 0;
+          for (var i2 = 0; i2 < jMatY.length; i2++) {
+            sst2 += Math.pow(jMatY[i2] - yAverage, 2);
+          }
+          return sst2;
+        },
+        matrixsubtract: function matrixsubtract(A, B) {
+          var ans = new Array(A.length);
+          for (var i2 = 0; i2 < A.length; i2++) {
+            ans[i2] = new Array(A[i2].length);
+            for (var j = 0; j < A[i2].length; j++) {
+              ans[i2][j] = A[i2][j] - B[i2][j];
+            }
+          }
+          return jStat3(ans);
+        }
+      });
+      jStat3.jStat = jStat3;
+      return jStat3;
+    });
   }
 });
 
@@ -30921,11 +30921,11 @@ var require_formats = __commonJS({
     }
     var MIN_INT32 = -(2 ** 31);
     var MAX_INT32 = 2 ** 31 - 1;
-    function validateInt32(value) {
-      return Number.isInteger(value) && value <= MAX_INT32 && value >= MIN_INT32;
+    function validateInt32(value2) {
+      return Number.isInteger(value2) && value2 <= MAX_INT32 && value2 >= MIN_INT32;
     }
-    function validateInt64(value) {
-      return Number.isInteger(value);
+    function validateInt64(value2) {
+      return Number.isInteger(value2);
     }
     function validateNumber() {
       return true;
@@ -31569,26 +31569,26 @@ var require_toJS = __commonJS({
   "node_modules/yaml/dist/nodes/toJS.js"(exports) {
     "use strict";
     var identity = require_identity();
-    function toJS(value, arg, ctx) {
-      if (Array.isArray(value))
-        return value.map((v, i2) => toJS(v, String(i2), ctx));
-      if (value && typeof value.toJSON === "function") {
-        if (!ctx || !identity.hasAnchor(value))
-          return value.toJSON(arg, ctx);
+    function toJS(value2, arg, ctx) {
+      if (Array.isArray(value2))
+        return value2.map((v, i2) => toJS(v, String(i2), ctx));
+      if (value2 && typeof value2.toJSON === "function") {
+        if (!ctx || !identity.hasAnchor(value2))
+          return value2.toJSON(arg, ctx);
         const data = { aliasCount: 0, count: 1, res: void 0 };
-        ctx.anchors.set(value, data);
+        ctx.anchors.set(value2, data);
         ctx.onCreate = (res2) => {
           data.res = res2;
           delete ctx.onCreate;
         };
-        const res = value.toJSON(arg, ctx);
+        const res = value2.toJSON(arg, ctx);
         if (ctx.onCreate)
           ctx.onCreate(res);
         return res;
       }
-      if (typeof value === "bigint" && !ctx?.keep)
-        return Number(value);
-      return value;
+      if (typeof value2 === "bigint" && !ctx?.keep)
+        return Number(value2);
+      return value2;
     }
     exports.toJS = toJS;
   }
@@ -31760,11 +31760,11 @@ var require_Scalar = __commonJS({
     var identity = require_identity();
     var Node = require_Node();
     var toJS = require_toJS();
-    var isScalarValue = (value) => !value || typeof value !== "function" && typeof value !== "object";
+    var isScalarValue = (value2) => !value2 || typeof value2 !== "function" && typeof value2 !== "object";
     var Scalar = class extends Node.NodeBase {
-      constructor(value) {
+      constructor(value2) {
         super(identity.SCALAR);
-        this.value = value;
+        this.value = value2;
       }
       toJSON(arg, ctx) {
         return ctx?.keep ? this.value : toJS.toJS(this.value, arg, ctx);
@@ -31791,7 +31791,7 @@ var require_createNode = __commonJS({
     var identity = require_identity();
     var Scalar = require_Scalar();
     var defaultTagPrefix = "tag:yaml.org,2002:";
-    function findTagObject(value, tagName, tags) {
+    function findTagObject(value2, tagName, tags) {
       if (tagName) {
         const match = tags.filter((t) => t.tag === tagName);
         const tagObj = match.find((t) => !t.format) ?? match[0];
@@ -31799,53 +31799,53 @@ var require_createNode = __commonJS({
           throw new Error(`Tag ${tagName} not found`);
         return tagObj;
       }
-      return tags.find((t) => t.identify?.(value) && !t.format);
+      return tags.find((t) => t.identify?.(value2) && !t.format);
     }
-    function createNode(value, tagName, ctx) {
-      if (identity.isDocument(value))
-        value = value.contents;
-      if (identity.isNode(value))
-        return value;
-      if (identity.isPair(value)) {
+    function createNode(value2, tagName, ctx) {
+      if (identity.isDocument(value2))
+        value2 = value2.contents;
+      if (identity.isNode(value2))
+        return value2;
+      if (identity.isPair(value2)) {
         const map = ctx.schema[identity.MAP].createNode?.(ctx.schema, null, ctx);
-        map.items.push(value);
+        map.items.push(value2);
         return map;
       }
-      if (value instanceof String || value instanceof Number || value instanceof Boolean || typeof BigInt !== "undefined" && value instanceof BigInt) {
-        value = value.valueOf();
+      if (value2 instanceof String || value2 instanceof Number || value2 instanceof Boolean || typeof BigInt !== "undefined" && value2 instanceof BigInt) {
+        value2 = value2.valueOf();
       }
       const { aliasDuplicateObjects, onAnchor, onTagObj, schema, sourceObjects } = ctx;
       let ref = void 0;
-      if (aliasDuplicateObjects && value && typeof value === "object") {
-        ref = sourceObjects.get(value);
+      if (aliasDuplicateObjects && value2 && typeof value2 === "object") {
+        ref = sourceObjects.get(value2);
         if (ref) {
-          ref.anchor ?? (ref.anchor = onAnchor(value));
+          ref.anchor ?? (ref.anchor = onAnchor(value2));
           return new Alias.Alias(ref.anchor);
         } else {
           ref = { anchor: null, node: null };
-          sourceObjects.set(value, ref);
+          sourceObjects.set(value2, ref);
         }
       }
       if (tagName?.startsWith("!!"))
         tagName = defaultTagPrefix + tagName.slice(2);
-      let tagObj = findTagObject(value, tagName, schema.tags);
+      let tagObj = findTagObject(value2, tagName, schema.tags);
       if (!tagObj) {
-        if (value && typeof value.toJSON === "function") {
-          value = value.toJSON();
+        if (value2 && typeof value2.toJSON === "function") {
+          value2 = value2.toJSON();
         }
-        if (!value || typeof value !== "object") {
-          const node2 = new Scalar.Scalar(value);
+        if (!value2 || typeof value2 !== "object") {
+          const node2 = new Scalar.Scalar(value2);
           if (ref)
             ref.node = node2;
           return node2;
         }
-        tagObj = value instanceof Map ? schema[identity.MAP] : Symbol.iterator in Object(value) ? schema[identity.SEQ] : schema[identity.MAP];
+        tagObj = value2 instanceof Map ? schema[identity.MAP] : Symbol.iterator in Object(value2) ? schema[identity.SEQ] : schema[identity.MAP];
       }
       if (onTagObj) {
         onTagObj(tagObj);
         delete ctx.onTagObj;
       }
-      const node = tagObj?.createNode ? tagObj.createNode(ctx.schema, value, ctx) : typeof tagObj?.nodeClass?.from === "function" ? tagObj.nodeClass.from(ctx.schema, value, ctx) : new Scalar.Scalar(value);
+      const node = tagObj?.createNode ? tagObj.createNode(ctx.schema, value2, ctx) : typeof tagObj?.nodeClass?.from === "function" ? tagObj.nodeClass.from(ctx.schema, value2, ctx) : new Scalar.Scalar(value2);
       if (tagName)
         node.tag = tagName;
       else if (!tagObj.default)
@@ -31865,8 +31865,8 @@ var require_Collection = __commonJS({
     var createNode = require_createNode();
     var identity = require_identity();
     var Node = require_Node();
-    function collectionFromPath(schema, path, value) {
-      let v = value;
+    function collectionFromPath(schema, path, value2) {
+      let v = value2;
       for (let i2 = path.length - 1; i2 >= 0; --i2) {
         const k = path[i2];
         if (typeof k === "number" && Number.isInteger(k) && k >= 0) {
@@ -31917,16 +31917,16 @@ var require_Collection = __commonJS({
        * be a Pair instance or a `{ key, value }` object, which may not have a key
        * that already exists in the map.
        */
-      addIn(path, value) {
+      addIn(path, value2) {
         if (isEmptyPath(path))
-          this.add(value);
+          this.add(value2);
         else {
           const [key, ...rest] = path;
           const node = this.get(key, true);
           if (identity.isCollection(node))
-            node.addIn(rest, value);
+            node.addIn(rest, value2);
           else if (node === void 0 && this.schema)
-            this.set(key, collectionFromPath(this.schema, rest, value));
+            this.set(key, collectionFromPath(this.schema, rest, value2));
           else
             throw new Error(`Expected YAML collection at ${key}. Remaining path: ${rest}`);
         }
@@ -31980,16 +31980,16 @@ var require_Collection = __commonJS({
        * Sets a value in this collection. For `!!set`, `value` needs to be a
        * boolean to add/remove the item from the set.
        */
-      setIn(path, value) {
+      setIn(path, value2) {
         const [key, ...rest] = path;
         if (rest.length === 0) {
-          this.set(key, value);
+          this.set(key, value2);
         } else {
           const node = this.get(key, true);
           if (identity.isCollection(node))
-            node.setIn(rest, value);
+            node.setIn(rest, value2);
           else if (node === void 0 && this.schema)
-            this.set(key, collectionFromPath(this.schema, rest, value));
+            this.set(key, collectionFromPath(this.schema, rest, value2));
           else
             throw new Error(`Expected YAML collection at ${key}. Remaining path: ${rest}`);
         }
@@ -32184,13 +32184,13 @@ var require_stringifyString = __commonJS({
       }
       return true;
     }
-    function doubleQuotedString(value, ctx) {
-      const json = JSON.stringify(value);
+    function doubleQuotedString(value2, ctx) {
+      const json = JSON.stringify(value2);
       if (ctx.options.doubleQuotedAsJSON)
         return json;
       const { implicitKey } = ctx;
       const minMultiLineLength = ctx.options.doubleQuotedMinMultiLineLength;
-      const indent = ctx.indent || (containsDocumentMarker(value) ? "  " : "");
+      const indent = ctx.indent || (containsDocumentMarker(value2) ? "  " : "");
       let str = "";
       let start = 0;
       for (let i2 = 0, ch = json[i2]; ch; ch = json[++i2]) {
@@ -32264,22 +32264,22 @@ var require_stringifyString = __commonJS({
       str = start ? str + json.slice(start) : json;
       return implicitKey ? str : foldFlowLines.foldFlowLines(str, indent, foldFlowLines.FOLD_QUOTED, getFoldOptions(ctx, false));
     }
-    function singleQuotedString(value, ctx) {
-      if (ctx.options.singleQuote === false || ctx.implicitKey && value.includes("\n") || /[ \t]\n|\n[ \t]/.test(value))
-        return doubleQuotedString(value, ctx);
-      const indent = ctx.indent || (containsDocumentMarker(value) ? "  " : "");
-      const res = "'" + value.replace(/'/g, "''").replace(/\n+/g, `$&
+    function singleQuotedString(value2, ctx) {
+      if (ctx.options.singleQuote === false || ctx.implicitKey && value2.includes("\n") || /[ \t]\n|\n[ \t]/.test(value2))
+        return doubleQuotedString(value2, ctx);
+      const indent = ctx.indent || (containsDocumentMarker(value2) ? "  " : "");
+      const res = "'" + value2.replace(/'/g, "''").replace(/\n+/g, `$&
 ${indent}`) + "'";
       return ctx.implicitKey ? res : foldFlowLines.foldFlowLines(res, indent, foldFlowLines.FOLD_FLOW, getFoldOptions(ctx, false));
     }
-    function quotedString(value, ctx) {
+    function quotedString(value2, ctx) {
       const { singleQuote } = ctx.options;
       let qs;
       if (singleQuote === false)
         qs = doubleQuotedString;
       else {
-        const hasDouble = value.includes('"');
-        const hasSingle = value.includes("'");
+        const hasDouble = value2.includes('"');
+        const hasSingle = value2.includes("'");
         if (hasDouble && !hasSingle)
           qs = singleQuotedString;
         else if (hasSingle && !hasDouble)
@@ -32287,7 +32287,7 @@ ${indent}`) + "'";
         else
           qs = singleQuote ? singleQuotedString : doubleQuotedString;
       }
-      return qs(value, ctx);
+      return qs(value2, ctx);
     }
     var blockEndNewlines;
     try {
@@ -32295,27 +32295,27 @@ ${indent}`) + "'";
     } catch {
       blockEndNewlines = /\n+(?!\n|$)/g;
     }
-    function blockString({ comment, type, value }, ctx, onComment, onChompKeep) {
+    function blockString({ comment, type, value: value2 }, ctx, onComment, onChompKeep) {
       const { blockQuote, commentString, lineWidth } = ctx.options;
-      if (!blockQuote || /\n[\t ]+$/.test(value)) {
-        return quotedString(value, ctx);
+      if (!blockQuote || /\n[\t ]+$/.test(value2)) {
+        return quotedString(value2, ctx);
       }
-      const indent = ctx.indent || (ctx.forceBlockIndent || containsDocumentMarker(value) ? "  " : "");
-      const literal = blockQuote === "literal" ? true : blockQuote === "folded" || type === Scalar.Scalar.BLOCK_FOLDED ? false : type === Scalar.Scalar.BLOCK_LITERAL ? true : !lineLengthOverLimit(value, lineWidth, indent.length);
-      if (!value)
+      const indent = ctx.indent || (ctx.forceBlockIndent || containsDocumentMarker(value2) ? "  " : "");
+      const literal = blockQuote === "literal" ? true : blockQuote === "folded" || type === Scalar.Scalar.BLOCK_FOLDED ? false : type === Scalar.Scalar.BLOCK_LITERAL ? true : !lineLengthOverLimit(value2, lineWidth, indent.length);
+      if (!value2)
         return literal ? "|\n" : ">\n";
       let chomp;
       let endStart;
-      for (endStart = value.length; endStart > 0; --endStart) {
-        const ch = value[endStart - 1];
+      for (endStart = value2.length; endStart > 0; --endStart) {
+        const ch = value2[endStart - 1];
         if (ch !== "\n" && ch !== "	" && ch !== " ")
           break;
       }
-      let end = value.substring(endStart);
+      let end = value2.substring(endStart);
       const endNlPos = end.indexOf("\n");
       if (endNlPos === -1) {
         chomp = "-";
-      } else if (value === end || endNlPos !== end.length - 1) {
+      } else if (value2 === end || endNlPos !== end.length - 1) {
         chomp = "+";
         if (onChompKeep)
           onChompKeep();
@@ -32323,7 +32323,7 @@ ${indent}`) + "'";
         chomp = "";
       }
       if (end) {
-        value = value.slice(0, -end.length);
+        value2 = value2.slice(0, -end.length);
         if (end[end.length - 1] === "\n")
           end = end.slice(0, -1);
         end = end.replace(blockEndNewlines, `$&${indent}`);
@@ -32331,8 +32331,8 @@ ${indent}`) + "'";
       let startWithSpace = false;
       let startEnd;
       let startNlPos = -1;
-      for (startEnd = 0; startEnd < value.length; ++startEnd) {
-        const ch = value[startEnd];
+      for (startEnd = 0; startEnd < value2.length; ++startEnd) {
+        const ch = value2[startEnd];
         if (ch === " ")
           startWithSpace = true;
         else if (ch === "\n")
@@ -32340,9 +32340,9 @@ ${indent}`) + "'";
         else
           break;
       }
-      let start = value.substring(0, startNlPos < startEnd ? startNlPos + 1 : startEnd);
+      let start = value2.substring(0, startNlPos < startEnd ? startNlPos + 1 : startEnd);
       if (start) {
-        value = value.substring(start.length);
+        value2 = value2.substring(start.length);
         start = start.replace(/\n+/g, `$&${indent}`);
       }
       const indentSize = indent ? "2" : "1";
@@ -32353,7 +32353,7 @@ ${indent}`) + "'";
           onComment();
       }
       if (!literal) {
-        const foldedValue = value.replace(/\n+/g, "\n$&").replace(/(?:^|\n)([\t ].*)(?:([\n\t ]*)\n(?![\n\t ]))?/g, "$1$2").replace(/\n+/g, `$&${indent}`);
+        const foldedValue = value2.replace(/\n+/g, "\n$&").replace(/(?:^|\n)([\t ].*)(?:([\n\t ]*)\n(?![\n\t ]))?/g, "$1$2").replace(/\n+/g, `$&${indent}`);
         let literalFallback = false;
         const foldOptions = getFoldOptions(ctx, true);
         if (blockQuote !== "folded" && type !== Scalar.Scalar.BLOCK_FOLDED) {
@@ -32366,37 +32366,37 @@ ${indent}`) + "'";
           return `>${header}
 ${indent}${body}`;
       }
-      value = value.replace(/\n+/g, `$&${indent}`);
+      value2 = value2.replace(/\n+/g, `$&${indent}`);
       return `|${header}
-${indent}${start}${value}${end}`;
+${indent}${start}${value2}${end}`;
     }
     function plainString(item, ctx, onComment, onChompKeep) {
-      const { type, value } = item;
+      const { type, value: value2 } = item;
       const { actualString, implicitKey, indent, indentStep, inFlow } = ctx;
-      if (implicitKey && value.includes("\n") || inFlow && /[[\]{},]/.test(value)) {
-        return quotedString(value, ctx);
+      if (implicitKey && value2.includes("\n") || inFlow && /[[\]{},]/.test(value2)) {
+        return quotedString(value2, ctx);
       }
-      if (/^[\n\t ,[\]{}#&*!|>'"%@`]|^[?-]$|^[?-][ \t]|[\n:][ \t]|[ \t]\n|[\n\t ]#|[\n\t :]$/.test(value)) {
-        return implicitKey || inFlow || !value.includes("\n") ? quotedString(value, ctx) : blockString(item, ctx, onComment, onChompKeep);
+      if (/^[\n\t ,[\]{}#&*!|>'"%@`]|^[?-]$|^[?-][ \t]|[\n:][ \t]|[ \t]\n|[\n\t ]#|[\n\t :]$/.test(value2)) {
+        return implicitKey || inFlow || !value2.includes("\n") ? quotedString(value2, ctx) : blockString(item, ctx, onComment, onChompKeep);
       }
-      if (!implicitKey && !inFlow && type !== Scalar.Scalar.PLAIN && value.includes("\n")) {
+      if (!implicitKey && !inFlow && type !== Scalar.Scalar.PLAIN && value2.includes("\n")) {
         return blockString(item, ctx, onComment, onChompKeep);
       }
-      if (containsDocumentMarker(value)) {
+      if (containsDocumentMarker(value2)) {
         if (indent === "") {
           ctx.forceBlockIndent = true;
           return blockString(item, ctx, onComment, onChompKeep);
         } else if (implicitKey && indent === indentStep) {
-          return quotedString(value, ctx);
+          return quotedString(value2, ctx);
         }
       }
-      const str = value.replace(/\n+/g, `$&
+      const str = value2.replace(/\n+/g, `$&
 ${indent}`);
       if (actualString) {
         const test = (tag) => tag.default && tag.tag !== "tag:yaml.org,2002:str" && tag.test?.test(str);
         const { compat, tags } = ctx.doc.schema;
         if (tags.some(test) || compat?.some(test))
-          return quotedString(value, ctx);
+          return quotedString(value2, ctx);
       }
       return implicitKey ? str : foldFlowLines.foldFlowLines(str, indent, foldFlowLines.FOLD_FLOW, getFoldOptions(ctx, false));
     }
@@ -32569,7 +32569,7 @@ var require_stringifyPair = __commonJS({
     var Scalar = require_Scalar();
     var stringify = require_stringify();
     var stringifyComment = require_stringifyComment();
-    function stringifyPair({ key, value }, ctx, onComment, onChompKeep) {
+    function stringifyPair({ key, value: value2 }, ctx, onComment, onChompKeep) {
       const { allNullValues, doc, indent, indentStep, options: { commentString, indentSeq, simpleKeys } } = ctx;
       let keyComment = identity.isNode(key) && key.comment || null;
       if (simpleKeys) {
@@ -32581,7 +32581,7 @@ var require_stringifyPair = __commonJS({
           throw new Error(msg);
         }
       }
-      let explicitKey = !simpleKeys && (!key || keyComment && value == null && !ctx.inFlow || identity.isCollection(key) || (identity.isScalar(key) ? key.type === Scalar.Scalar.BLOCK_FOLDED || key.type === Scalar.Scalar.BLOCK_LITERAL : typeof key === "object"));
+      let explicitKey = !simpleKeys && (!key || keyComment && value2 == null && !ctx.inFlow || identity.isCollection(key) || (identity.isScalar(key) ? key.type === Scalar.Scalar.BLOCK_FOLDED || key.type === Scalar.Scalar.BLOCK_LITERAL : typeof key === "object"));
       ctx = Object.assign({}, ctx, {
         allNullValues: false,
         implicitKey: !explicitKey && (simpleKeys || !allNullValues),
@@ -32596,12 +32596,12 @@ var require_stringifyPair = __commonJS({
         explicitKey = true;
       }
       if (ctx.inFlow) {
-        if (allNullValues || value == null) {
+        if (allNullValues || value2 == null) {
           if (keyCommentDone && onComment)
             onComment();
           return str === "" ? "?" : explicitKey ? `? ${str}` : str;
         }
-      } else if (allNullValues && !simpleKeys || value == null && explicitKey) {
+      } else if (allNullValues && !simpleKeys || value2 == null && explicitKey) {
         str = `? ${str}`;
         if (keyComment && !keyCommentDone) {
           str += stringifyComment.lineComment(str, ctx.indent, commentString(keyComment));
@@ -32622,26 +32622,26 @@ ${indent}:`;
           str += stringifyComment.lineComment(str, ctx.indent, commentString(keyComment));
       }
       let vsb, vcb, valueComment;
-      if (identity.isNode(value)) {
-        vsb = !!value.spaceBefore;
-        vcb = value.commentBefore;
-        valueComment = value.comment;
+      if (identity.isNode(value2)) {
+        vsb = !!value2.spaceBefore;
+        vcb = value2.commentBefore;
+        valueComment = value2.comment;
       } else {
         vsb = false;
         vcb = null;
         valueComment = null;
-        if (value && typeof value === "object")
-          value = doc.createNode(value);
+        if (value2 && typeof value2 === "object")
+          value2 = doc.createNode(value2);
       }
       ctx.implicitKey = false;
-      if (!explicitKey && !keyComment && identity.isScalar(value))
+      if (!explicitKey && !keyComment && identity.isScalar(value2))
         ctx.indentAtStart = str.length + 1;
       chompKeep = false;
-      if (!indentSeq && indentStep.length >= 2 && !ctx.inFlow && !explicitKey && identity.isSeq(value) && !value.flow && !value.tag && !value.anchor) {
+      if (!indentSeq && indentStep.length >= 2 && !ctx.inFlow && !explicitKey && identity.isSeq(value2) && !value2.flow && !value2.tag && !value2.anchor) {
         ctx.indent = ctx.indent.substring(2);
       }
       let valueCommentDone = false;
-      const valueStr = stringify.stringify(value, ctx, () => valueCommentDone = true, () => chompKeep = true);
+      const valueStr = stringify.stringify(value2, ctx, () => valueCommentDone = true, () => chompKeep = true);
       let ws = " ";
       if (keyComment || vsb || vcb) {
         ws = vsb ? "\n" : "";
@@ -32657,11 +32657,11 @@ ${stringifyComment.indentComment(cs, ctx.indent)}`;
           ws += `
 ${ctx.indent}`;
         }
-      } else if (!explicitKey && identity.isCollection(value)) {
+      } else if (!explicitKey && identity.isCollection(value2)) {
         const vs0 = valueStr[0];
         const nl0 = valueStr.indexOf("\n");
         const hasNewline = nl0 !== -1;
-        const flow = ctx.inFlow ?? value.flow ?? value.items.length === 0;
+        const flow = ctx.inFlow ?? value2.flow ?? value2.items.length === 0;
         if (hasNewline || !flow) {
           let hasPropsLine = false;
           if (hasNewline && (vs0 === "&" || vs0 === "!")) {
@@ -32724,7 +32724,7 @@ var require_merge = __commonJS({
     var Scalar = require_Scalar();
     var MERGE_KEY = "<<";
     var merge2 = {
-      identify: (value) => value === MERGE_KEY || typeof value === "symbol" && value.description === MERGE_KEY,
+      identify: (value2) => value2 === MERGE_KEY || typeof value2 === "symbol" && value2.description === MERGE_KEY,
       default: "key",
       tag: "tag:yaml.org,2002:merge",
       test: /^<<$/,
@@ -32734,8 +32734,8 @@ var require_merge = __commonJS({
       stringify: () => MERGE_KEY
     };
     var isMergeKey = (ctx, key) => (merge2.identify(key) || identity.isScalar(key) && (!key.type || key.type === Scalar.Scalar.PLAIN) && merge2.identify(key.value)) && ctx?.doc.schema.tags.some((tag) => tag.tag === merge2.tag && tag.default);
-    function addMergeToJSMap(ctx, map, value) {
-      const source = resolveAliasValue(ctx, value);
+    function addMergeToJSMap(ctx, map, value2) {
+      const source = resolveAliasValue(ctx, value2);
       if (identity.isSeq(source))
         for (const it of source.items)
           mergeValue(ctx, map, it);
@@ -32745,20 +32745,20 @@ var require_merge = __commonJS({
       else
         mergeValue(ctx, map, source);
     }
-    function mergeValue(ctx, map, value) {
-      const source = resolveAliasValue(ctx, value);
+    function mergeValue(ctx, map, value2) {
+      const source = resolveAliasValue(ctx, value2);
       if (!identity.isMap(source))
         throw new Error("Merge sources must be maps or map aliases");
       const srcMap = source.toJSON(null, ctx, Map);
-      for (const [key, value2] of srcMap) {
+      for (const [key, value3] of srcMap) {
         if (map instanceof Map) {
           if (!map.has(key))
-            map.set(key, value2);
+            map.set(key, value3);
         } else if (map instanceof Set) {
           map.add(key);
         } else if (!Object.prototype.hasOwnProperty.call(map, key)) {
           Object.defineProperty(map, key, {
-            value: value2,
+            value: value3,
             writable: true,
             enumerable: true,
             configurable: true
@@ -32767,8 +32767,8 @@ var require_merge = __commonJS({
       }
       return map;
     }
-    function resolveAliasValue(ctx, value) {
-      return ctx && identity.isAlias(value) ? value.resolve(ctx.doc, ctx) : value;
+    function resolveAliasValue(ctx, value2) {
+      return ctx && identity.isAlias(value2) ? value2.resolve(ctx.doc, ctx) : value2;
     }
     exports.addMergeToJSMap = addMergeToJSMap;
     exports.isMergeKey = isMergeKey;
@@ -32785,20 +32785,20 @@ var require_addPairToJSMap = __commonJS({
     var stringify = require_stringify();
     var identity = require_identity();
     var toJS = require_toJS();
-    function addPairToJSMap(ctx, map, { key, value }) {
+    function addPairToJSMap(ctx, map, { key, value: value2 }) {
       if (identity.isNode(key) && key.addToJSMap)
-        key.addToJSMap(ctx, map, value);
+        key.addToJSMap(ctx, map, value2);
       else if (merge2.isMergeKey(ctx, key))
-        merge2.addMergeToJSMap(ctx, map, value);
+        merge2.addMergeToJSMap(ctx, map, value2);
       else {
         const jsKey = toJS.toJS(key, "", ctx);
         if (map instanceof Map) {
-          map.set(jsKey, toJS.toJS(value, jsKey, ctx));
+          map.set(jsKey, toJS.toJS(value2, jsKey, ctx));
         } else if (map instanceof Set) {
           map.add(jsKey);
         } else {
           const stringKey = stringifyKey(key, jsKey, ctx);
-          const jsValue = toJS.toJS(value, stringKey, ctx);
+          const jsValue = toJS.toJS(value2, stringKey, ctx);
           if (stringKey in map)
             Object.defineProperty(map, stringKey, {
               value: jsValue,
@@ -32848,24 +32848,24 @@ var require_Pair = __commonJS({
     var stringifyPair = require_stringifyPair();
     var addPairToJSMap = require_addPairToJSMap();
     var identity = require_identity();
-    function createPair(key, value, ctx) {
+    function createPair(key, value2, ctx) {
       const k = createNode.createNode(key, void 0, ctx);
-      const v = createNode.createNode(value, void 0, ctx);
+      const v = createNode.createNode(value2, void 0, ctx);
       return new Pair(k, v);
     }
     var Pair = class _Pair {
-      constructor(key, value = null) {
+      constructor(key, value2 = null) {
         Object.defineProperty(this, identity.NODE_TYPE, { value: identity.PAIR });
         this.key = key;
-        this.value = value;
+        this.value = value2;
       }
       clone(schema) {
-        let { key, value } = this;
+        let { key, value: value2 } = this;
         if (identity.isNode(key))
           key = key.clone(schema);
-        if (identity.isNode(value))
-          value = value.clone(schema);
-        return new _Pair(key, value);
+        if (identity.isNode(value2))
+          value2 = value2.clone(schema);
+        return new _Pair(key, value2);
       }
       toJSON(_, ctx) {
         const pair = ctx?.mapAsMap ? /* @__PURE__ */ new Map() : {};
@@ -33068,17 +33068,17 @@ var require_YAMLMap = __commonJS({
       static from(schema, obj, ctx) {
         const { keepUndefined, replacer } = ctx;
         const map = new this(schema);
-        const add = (key, value) => {
+        const add = (key, value2) => {
           if (typeof replacer === "function")
-            value = replacer.call(obj, key, value);
+            value2 = replacer.call(obj, key, value2);
           else if (Array.isArray(replacer) && !replacer.includes(key))
             return;
-          if (value !== void 0 || keepUndefined)
-            map.items.push(Pair.createPair(key, value, ctx));
+          if (value2 !== void 0 || keepUndefined)
+            map.items.push(Pair.createPair(key, value2, ctx));
         };
         if (obj instanceof Map) {
-          for (const [key, value] of obj)
-            add(key, value);
+          for (const [key, value2] of obj)
+            add(key, value2);
         } else if (obj && typeof obj === "object") {
           for (const key of Object.keys(obj))
             add(key, obj[key]);
@@ -33136,8 +33136,8 @@ var require_YAMLMap = __commonJS({
       has(key) {
         return !!findPair(this.items, key);
       }
-      set(key, value) {
-        this.add(new Pair.Pair(key, value), true);
+      set(key, value2) {
+        this.add(new Pair.Pair(key, value2), true);
       }
       /**
        * @param ctx - Conversion context, originally set in Document#toJS()
@@ -33215,8 +33215,8 @@ var require_YAMLSeq = __commonJS({
         super(identity.SEQ, schema);
         this.items = [];
       }
-      add(value) {
-        this.items.push(value);
+      add(value2) {
+        this.items.push(value2);
       }
       /**
        * Removes a value from the collection.
@@ -33257,15 +33257,15 @@ var require_YAMLSeq = __commonJS({
        * If `key` does not contain a representation of an integer, this will throw.
        * It may be wrapped in a `Scalar`.
        */
-      set(key, value) {
+      set(key, value2) {
         const idx = asItemIndex(key);
         if (typeof idx !== "number")
           throw new Error(`Expected a valid index, not ${key}.`);
         const prev = this.items[idx];
-        if (identity.isScalar(prev) && Scalar.isScalarValue(value))
-          prev.value = value;
+        if (identity.isScalar(prev) && Scalar.isScalarValue(value2))
+          prev.value = value2;
         else
-          this.items[idx] = value;
+          this.items[idx] = value2;
       }
       toJSON(_, ctx) {
         const seq = [];
@@ -33341,7 +33341,7 @@ var require_string = __commonJS({
     "use strict";
     var stringifyString = require_stringifyString();
     var string = {
-      identify: (value) => typeof value === "string",
+      identify: (value2) => typeof value2 === "string",
       default: true,
       tag: "tag:yaml.org,2002:str",
       resolve: (str) => str,
@@ -33360,7 +33360,7 @@ var require_null = __commonJS({
     "use strict";
     var Scalar = require_Scalar();
     var nullTag = {
-      identify: (value) => value == null,
+      identify: (value2) => value2 == null,
       createNode: () => new Scalar.Scalar(null),
       default: true,
       tag: "tag:yaml.org,2002:null",
@@ -33378,18 +33378,18 @@ var require_bool = __commonJS({
     "use strict";
     var Scalar = require_Scalar();
     var boolTag = {
-      identify: (value) => typeof value === "boolean",
+      identify: (value2) => typeof value2 === "boolean",
       default: true,
       tag: "tag:yaml.org,2002:bool",
       test: /^(?:[Tt]rue|TRUE|[Ff]alse|FALSE)$/,
       resolve: (str) => new Scalar.Scalar(str[0] === "t" || str[0] === "T"),
-      stringify({ source, value }, ctx) {
+      stringify({ source, value: value2 }, ctx) {
         if (source && boolTag.test.test(source)) {
           const sv = source[0] === "t" || source[0] === "T";
-          if (value === sv)
+          if (value2 === sv)
             return source;
         }
-        return value ? ctx.options.trueStr : ctx.options.falseStr;
+        return value2 ? ctx.options.trueStr : ctx.options.falseStr;
       }
     };
     exports.boolTag = boolTag;
@@ -33400,13 +33400,13 @@ var require_bool = __commonJS({
 var require_stringifyNumber = __commonJS({
   "node_modules/yaml/dist/stringify/stringifyNumber.js"(exports) {
     "use strict";
-    function stringifyNumber({ format, minFractionDigits, tag, value }) {
-      if (typeof value === "bigint")
-        return String(value);
-      const num2 = typeof value === "number" ? value : Number(value);
-      if (!isFinite(num2))
-        return isNaN(num2) ? ".nan" : num2 < 0 ? "-.inf" : ".inf";
-      let n = Object.is(value, -0) ? "-0" : JSON.stringify(value);
+    function stringifyNumber({ format, minFractionDigits, tag, value: value2 }) {
+      if (typeof value2 === "bigint")
+        return String(value2);
+      const num = typeof value2 === "number" ? value2 : Number(value2);
+      if (!isFinite(num))
+        return isNaN(num) ? ".nan" : num < 0 ? "-.inf" : ".inf";
+      let n = Object.is(value2, -0) ? "-0" : JSON.stringify(value2);
       if (!format && minFractionDigits && (!tag || tag === "tag:yaml.org,2002:float") && /^-?\d/.test(n) && !n.includes("e")) {
         let i2 = n.indexOf(".");
         if (i2 < 0) {
@@ -33430,7 +33430,7 @@ var require_float = __commonJS({
     var Scalar = require_Scalar();
     var stringifyNumber = require_stringifyNumber();
     var floatNaN = {
-      identify: (value) => typeof value === "number",
+      identify: (value2) => typeof value2 === "number",
       default: true,
       tag: "tag:yaml.org,2002:float",
       test: /^(?:[-+]?\.(?:inf|Inf|INF)|\.nan|\.NaN|\.NAN)$/,
@@ -33438,19 +33438,19 @@ var require_float = __commonJS({
       stringify: stringifyNumber.stringifyNumber
     };
     var floatExp = {
-      identify: (value) => typeof value === "number",
+      identify: (value2) => typeof value2 === "number",
       default: true,
       tag: "tag:yaml.org,2002:float",
       format: "EXP",
       test: /^[-+]?(?:\.[0-9]+|[0-9]+(?:\.[0-9]*)?)[eE][-+]?[0-9]+$/,
       resolve: (str) => parseFloat(str),
       stringify(node) {
-        const num2 = Number(node.value);
-        return isFinite(num2) ? num2.toExponential() : stringifyNumber.stringifyNumber(node);
+        const num = Number(node.value);
+        return isFinite(num) ? num.toExponential() : stringifyNumber.stringifyNumber(node);
       }
     };
     var float = {
-      identify: (value) => typeof value === "number",
+      identify: (value2) => typeof value2 === "number",
       default: true,
       tag: "tag:yaml.org,2002:float",
       test: /^[-+]?(?:\.[0-9]+|[0-9]+\.[0-9]*)$/,
@@ -33474,16 +33474,16 @@ var require_int = __commonJS({
   "node_modules/yaml/dist/schema/core/int.js"(exports) {
     "use strict";
     var stringifyNumber = require_stringifyNumber();
-    var intIdentify = (value) => typeof value === "bigint" || Number.isInteger(value);
+    var intIdentify = (value2) => typeof value2 === "bigint" || Number.isInteger(value2);
     var intResolve = (str, offset, radix, { intAsBigInt }) => intAsBigInt ? BigInt(str) : parseInt(str.substring(offset), radix);
     function intStringify(node, radix, prefix) {
-      const { value } = node;
-      if (intIdentify(value) && value >= 0)
-        return prefix + value.toString(radix);
+      const { value: value2 } = node;
+      if (intIdentify(value2) && value2 >= 0)
+        return prefix + value2.toString(radix);
       return stringifyNumber.stringifyNumber(node);
     }
     var intOct = {
-      identify: (value) => intIdentify(value) && value >= 0,
+      identify: (value2) => intIdentify(value2) && value2 >= 0,
       default: true,
       tag: "tag:yaml.org,2002:int",
       format: "OCT",
@@ -33500,7 +33500,7 @@ var require_int = __commonJS({
       stringify: stringifyNumber.stringifyNumber
     };
     var intHex = {
-      identify: (value) => intIdentify(value) && value >= 0,
+      identify: (value2) => intIdentify(value2) && value2 >= 0,
       default: true,
       tag: "tag:yaml.org,2002:int",
       format: "HEX",
@@ -33549,20 +33549,20 @@ var require_schema3 = __commonJS({
     var Scalar = require_Scalar();
     var map = require_map();
     var seq = require_seq();
-    function intIdentify(value) {
-      return typeof value === "bigint" || Number.isInteger(value);
+    function intIdentify(value2) {
+      return typeof value2 === "bigint" || Number.isInteger(value2);
     }
-    var stringifyJSON = ({ value }) => JSON.stringify(value);
+    var stringifyJSON = ({ value: value2 }) => JSON.stringify(value2);
     var jsonScalars = [
       {
-        identify: (value) => typeof value === "string",
+        identify: (value2) => typeof value2 === "string",
         default: true,
         tag: "tag:yaml.org,2002:str",
         resolve: (str) => str,
         stringify: stringifyJSON
       },
       {
-        identify: (value) => value == null,
+        identify: (value2) => value2 == null,
         createNode: () => new Scalar.Scalar(null),
         default: true,
         tag: "tag:yaml.org,2002:null",
@@ -33571,7 +33571,7 @@ var require_schema3 = __commonJS({
         stringify: stringifyJSON
       },
       {
-        identify: (value) => typeof value === "boolean",
+        identify: (value2) => typeof value2 === "boolean",
         default: true,
         tag: "tag:yaml.org,2002:bool",
         test: /^true$|^false$/,
@@ -33584,10 +33584,10 @@ var require_schema3 = __commonJS({
         tag: "tag:yaml.org,2002:int",
         test: /^-?(?:0|[1-9][0-9]*)$/,
         resolve: (str, _onError, { intAsBigInt }) => intAsBigInt ? BigInt(str) : parseInt(str, 10),
-        stringify: ({ value }) => intIdentify(value) ? value.toString() : JSON.stringify(value)
+        stringify: ({ value: value2 }) => intIdentify(value2) ? value2.toString() : JSON.stringify(value2)
       },
       {
-        identify: (value) => typeof value === "number",
+        identify: (value2) => typeof value2 === "number",
         default: true,
         tag: "tag:yaml.org,2002:float",
         test: /^-?(?:0|[1-9][0-9]*)(?:\.[0-9]*)?(?:[eE][-+]?[0-9]+)?$/,
@@ -33617,7 +33617,7 @@ var require_binary = __commonJS({
     var Scalar = require_Scalar();
     var stringifyString = require_stringifyString();
     var binary = {
-      identify: (value) => value instanceof Uint8Array,
+      identify: (value2) => value2 instanceof Uint8Array,
       // Buffer inherits from Uint8Array
       default: false,
       tag: "tag:yaml.org,2002:binary",
@@ -33643,10 +33643,10 @@ var require_binary = __commonJS({
           return src;
         }
       },
-      stringify({ comment, type, value }, ctx, onComment, onChompKeep) {
-        if (!value)
+      stringify({ comment, type, value: value2 }, ctx, onComment, onChompKeep) {
+        if (!value2)
           return "";
-        const buf = value;
+        const buf = value2;
         let str;
         if (typeof node_buffer.Buffer === "function") {
           str = buf instanceof node_buffer.Buffer ? buf.toString("base64") : node_buffer.Buffer.from(buf.buffer).toString("base64");
@@ -33718,25 +33718,25 @@ ${cn.comment}` : item.comment;
         for (let it of iterable) {
           if (typeof replacer === "function")
             it = replacer.call(iterable, String(i2++), it);
-          let key, value;
+          let key, value2;
           if (Array.isArray(it)) {
             if (it.length === 2) {
               key = it[0];
-              value = it[1];
+              value2 = it[1];
             } else
               throw new TypeError(`Expected [key, value] tuple: ${it}`);
           } else if (it && it instanceof Object) {
             const keys = Object.keys(it);
             if (keys.length === 1) {
               key = keys[0];
-              value = it[key];
+              value2 = it[key];
             } else {
               throw new TypeError(`Expected tuple with one key, not ${keys.length} keys`);
             }
           } else {
             key = it;
           }
-          pairs2.items.push(Pair.createPair(key, value, ctx));
+          pairs2.items.push(Pair.createPair(key, value2, ctx));
         }
       return pairs2;
     }
@@ -33783,16 +33783,16 @@ var require_omap = __commonJS({
         if (ctx?.onCreate)
           ctx.onCreate(map);
         for (const pair of this.items) {
-          let key, value;
+          let key, value2;
           if (identity.isPair(pair)) {
             key = toJS.toJS(pair.key, "", ctx);
-            value = toJS.toJS(pair.value, key, ctx);
+            value2 = toJS.toJS(pair.value, key, ctx);
           } else {
             key = toJS.toJS(pair, "", ctx);
           }
           if (map.has(key))
             throw new Error("Ordered maps must not include duplicate keys");
-          map.set(key, value);
+          map.set(key, value2);
         }
         return map;
       }
@@ -33806,7 +33806,7 @@ var require_omap = __commonJS({
     YAMLOMap.tag = "tag:yaml.org,2002:omap";
     var omap = {
       collection: "seq",
-      identify: (value) => value instanceof Map,
+      identify: (value2) => value2 instanceof Map,
       nodeClass: YAMLOMap,
       default: false,
       tag: "tag:yaml.org,2002:omap",
@@ -33836,14 +33836,14 @@ var require_bool2 = __commonJS({
   "node_modules/yaml/dist/schema/yaml-1.1/bool.js"(exports) {
     "use strict";
     var Scalar = require_Scalar();
-    function boolStringify({ value, source }, ctx) {
-      const boolObj = value ? trueTag : falseTag;
+    function boolStringify({ value: value2, source }, ctx) {
+      const boolObj = value2 ? trueTag : falseTag;
       if (source && boolObj.test.test(source))
         return source;
-      return value ? ctx.options.trueStr : ctx.options.falseStr;
+      return value2 ? ctx.options.trueStr : ctx.options.falseStr;
     }
     var trueTag = {
-      identify: (value) => value === true,
+      identify: (value2) => value2 === true,
       default: true,
       tag: "tag:yaml.org,2002:bool",
       test: /^(?:Y|y|[Yy]es|YES|[Tt]rue|TRUE|[Oo]n|ON)$/,
@@ -33851,7 +33851,7 @@ var require_bool2 = __commonJS({
       stringify: boolStringify
     };
     var falseTag = {
-      identify: (value) => value === false,
+      identify: (value2) => value2 === false,
       default: true,
       tag: "tag:yaml.org,2002:bool",
       test: /^(?:N|n|[Nn]o|NO|[Ff]alse|FALSE|[Oo]ff|OFF)$/,
@@ -33870,7 +33870,7 @@ var require_float2 = __commonJS({
     var Scalar = require_Scalar();
     var stringifyNumber = require_stringifyNumber();
     var floatNaN = {
-      identify: (value) => typeof value === "number",
+      identify: (value2) => typeof value2 === "number",
       default: true,
       tag: "tag:yaml.org,2002:float",
       test: /^(?:[-+]?\.(?:inf|Inf|INF)|\.nan|\.NaN|\.NAN)$/,
@@ -33878,19 +33878,19 @@ var require_float2 = __commonJS({
       stringify: stringifyNumber.stringifyNumber
     };
     var floatExp = {
-      identify: (value) => typeof value === "number",
+      identify: (value2) => typeof value2 === "number",
       default: true,
       tag: "tag:yaml.org,2002:float",
       format: "EXP",
       test: /^[-+]?(?:[0-9][0-9_]*)?(?:\.[0-9_]*)?[eE][-+]?[0-9]+$/,
       resolve: (str) => parseFloat(str.replace(/_/g, "")),
       stringify(node) {
-        const num2 = Number(node.value);
-        return isFinite(num2) ? num2.toExponential() : stringifyNumber.stringifyNumber(node);
+        const num = Number(node.value);
+        return isFinite(num) ? num.toExponential() : stringifyNumber.stringifyNumber(node);
       }
     };
     var float = {
-      identify: (value) => typeof value === "number",
+      identify: (value2) => typeof value2 === "number",
       default: true,
       tag: "tag:yaml.org,2002:float",
       test: /^[-+]?(?:[0-9][0-9_]*)?\.[0-9_]*$/,
@@ -33917,7 +33917,7 @@ var require_int2 = __commonJS({
   "node_modules/yaml/dist/schema/yaml-1.1/int.js"(exports) {
     "use strict";
     var stringifyNumber = require_stringifyNumber();
-    var intIdentify = (value) => typeof value === "bigint" || Number.isInteger(value);
+    var intIdentify = (value2) => typeof value2 === "bigint" || Number.isInteger(value2);
     function intResolve(str, offset, radix, { intAsBigInt }) {
       const sign = str[0];
       if (sign === "-" || sign === "+")
@@ -33942,10 +33942,10 @@ var require_int2 = __commonJS({
       return sign === "-" ? -1 * n : n;
     }
     function intStringify(node, radix, prefix) {
-      const { value } = node;
-      if (intIdentify(value)) {
-        const str = value.toString(radix);
-        return value < 0 ? "-" + prefix + str.substr(1) : prefix + str;
+      const { value: value2 } = node;
+      if (intIdentify(value2)) {
+        const str = value2.toString(radix);
+        return value2 < 0 ? "-" + prefix + str.substr(1) : prefix + str;
       }
       return stringifyNumber.stringifyNumber(node);
     }
@@ -34023,13 +34023,13 @@ var require_set = __commonJS({
         const pair = YAMLMap.findPair(this.items, key);
         return !keepPair && identity.isPair(pair) ? identity.isScalar(pair.key) ? pair.key.value : pair.key : pair;
       }
-      set(key, value) {
-        if (typeof value !== "boolean")
-          throw new Error(`Expected boolean value for set(key, value) in a YAML set, not ${typeof value}`);
+      set(key, value2) {
+        if (typeof value2 !== "boolean")
+          throw new Error(`Expected boolean value for set(key, value) in a YAML set, not ${typeof value2}`);
         const prev = YAMLMap.findPair(this.items, key);
-        if (prev && !value) {
+        if (prev && !value2) {
           this.items.splice(this.items.indexOf(prev), 1);
-        } else if (!prev && value) {
+        } else if (!prev && value2) {
           this.items.push(new Pair.Pair(key));
         }
       }
@@ -34048,10 +34048,10 @@ var require_set = __commonJS({
         const { replacer } = ctx;
         const set2 = new this(schema);
         if (iterable && Symbol.iterator in Object(iterable))
-          for (let value of iterable) {
+          for (let value2 of iterable) {
             if (typeof replacer === "function")
-              value = replacer.call(iterable, value, value);
-            set2.items.push(Pair.createPair(value, null, ctx));
+              value2 = replacer.call(iterable, value2, value2);
+            set2.items.push(Pair.createPair(value2, null, ctx));
           }
         return set2;
       }
@@ -34059,7 +34059,7 @@ var require_set = __commonJS({
     YAMLSet.tag = "tag:yaml.org,2002:set";
     var set = {
       collection: "map",
-      identify: (value) => value instanceof Set,
+      identify: (value2) => value2 instanceof Set,
       nodeClass: YAMLSet,
       default: false,
       tag: "tag:yaml.org,2002:set",
@@ -34088,38 +34088,38 @@ var require_timestamp = __commonJS({
     function parseSexagesimal(str, asBigInt) {
       const sign = str[0];
       const parts = sign === "-" || sign === "+" ? str.substring(1) : str;
-      const num2 = (n) => asBigInt ? BigInt(n) : Number(n);
-      const res = parts.replace(/_/g, "").split(":").reduce((res2, p) => res2 * num2(60) + num2(p), num2(0));
-      return sign === "-" ? num2(-1) * res : res;
+      const num = (n) => asBigInt ? BigInt(n) : Number(n);
+      const res = parts.replace(/_/g, "").split(":").reduce((res2, p) => res2 * num(60) + num(p), num(0));
+      return sign === "-" ? num(-1) * res : res;
     }
     function stringifySexagesimal(node) {
-      let { value } = node;
-      let num2 = (n) => n;
-      if (typeof value === "bigint")
-        num2 = (n) => BigInt(n);
-      else if (isNaN(value) || !isFinite(value))
+      let { value: value2 } = node;
+      let num = (n) => n;
+      if (typeof value2 === "bigint")
+        num = (n) => BigInt(n);
+      else if (isNaN(value2) || !isFinite(value2))
         return stringifyNumber.stringifyNumber(node);
       let sign = "";
-      if (value < 0) {
+      if (value2 < 0) {
         sign = "-";
-        value *= num2(-1);
+        value2 *= num(-1);
       }
-      const _60 = num2(60);
-      const parts = [value % _60];
-      if (value < 60) {
+      const _60 = num(60);
+      const parts = [value2 % _60];
+      if (value2 < 60) {
         parts.unshift(0);
       } else {
-        value = (value - parts[0]) / _60;
-        parts.unshift(value % _60);
-        if (value >= 60) {
-          value = (value - parts[0]) / _60;
-          parts.unshift(value);
+        value2 = (value2 - parts[0]) / _60;
+        parts.unshift(value2 % _60);
+        if (value2 >= 60) {
+          value2 = (value2 - parts[0]) / _60;
+          parts.unshift(value2);
         }
       }
       return sign + parts.map((n) => String(n).padStart(2, "0")).join(":").replace(/000000\d*$/, "");
     }
     var intTime = {
-      identify: (value) => typeof value === "bigint" || Number.isInteger(value),
+      identify: (value2) => typeof value2 === "bigint" || Number.isInteger(value2),
       default: true,
       tag: "tag:yaml.org,2002:int",
       format: "TIME",
@@ -34128,7 +34128,7 @@ var require_timestamp = __commonJS({
       stringify: stringifySexagesimal
     };
     var floatTime = {
-      identify: (value) => typeof value === "number",
+      identify: (value2) => typeof value2 === "number",
       default: true,
       tag: "tag:yaml.org,2002:float",
       format: "TIME",
@@ -34137,7 +34137,7 @@ var require_timestamp = __commonJS({
       stringify: stringifySexagesimal
     };
     var timestamp = {
-      identify: (value) => value instanceof Date,
+      identify: (value2) => value2 instanceof Date,
       default: true,
       tag: "tag:yaml.org,2002:timestamp",
       // If the time zone is omitted, the timestamp is assumed to be specified in UTC. The time part
@@ -34160,7 +34160,7 @@ var require_timestamp = __commonJS({
         }
         return new Date(date);
       },
-      stringify: ({ value }) => value?.toISOString().replace(/(T00:00:00)?\.000Z$/, "") ?? ""
+      stringify: ({ value: value2 }) => value2?.toISOString().replace(/(T00:00:00)?\.000Z$/, "") ?? ""
     };
     exports.floatTime = floatTime;
     exports.intTime = intTime;
@@ -34434,7 +34434,7 @@ var require_Document = __commonJS({
     var createNode = require_createNode();
     var directives = require_directives();
     var Document = class _Document {
-      constructor(value, replacer, options) {
+      constructor(value2, replacer, options) {
         this.commentBefore = null;
         this.comment = null;
         this.errors = [];
@@ -34466,7 +34466,7 @@ var require_Document = __commonJS({
         } else
           this.directives = new directives.Directives({ version });
         this.setSchema(version, options);
-        this.contents = value === void 0 ? null : this.createNode(value, _replacer, options);
+        this.contents = value2 === void 0 ? null : this.createNode(value2, _replacer, options);
       }
       /**
        * Create a deep copy of this Document and its contents.
@@ -34491,14 +34491,14 @@ var require_Document = __commonJS({
         return copy;
       }
       /** Adds a value to the document. */
-      add(value) {
+      add(value2) {
         if (assertCollection(this.contents))
-          this.contents.add(value);
+          this.contents.add(value2);
       }
       /** Adds a value to the document. */
-      addIn(path, value) {
+      addIn(path, value2) {
         if (assertCollection(this.contents))
-          this.contents.addIn(path, value);
+          this.contents.addIn(path, value2);
       }
       /**
        * Create a new `Alias` node, ensuring that the target `node` has the required anchor.
@@ -34517,10 +34517,10 @@ var require_Document = __commonJS({
         }
         return new Alias.Alias(node.anchor);
       }
-      createNode(value, replacer, options) {
+      createNode(value2, replacer, options) {
         let _replacer = void 0;
         if (typeof replacer === "function") {
-          value = replacer.call({ "": value }, "", value);
+          value2 = replacer.call({ "": value2 }, "", value2);
           _replacer = replacer;
         } else if (Array.isArray(replacer)) {
           const keyToStr = (v) => typeof v === "number" || v instanceof String || v instanceof Number;
@@ -34547,7 +34547,7 @@ var require_Document = __commonJS({
           schema: this.schema,
           sourceObjects
         };
-        const node = createNode.createNode(value, tag, ctx);
+        const node = createNode.createNode(value2, tag, ctx);
         if (flow && identity.isCollection(node))
           node.flow = true;
         setAnchors();
@@ -34557,9 +34557,9 @@ var require_Document = __commonJS({
        * Convert a key and a value into a `Pair` using the current schema,
        * recursively wrapping all values as `Scalar` or `Collection` nodes.
        */
-      createPair(key, value, options = {}) {
+      createPair(key, value2, options = {}) {
         const k = this.createNode(key, null, options);
-        const v = this.createNode(value, null, options);
+        const v = this.createNode(value2, null, options);
         return new Pair.Pair(k, v);
       }
       /**
@@ -34618,24 +34618,24 @@ var require_Document = __commonJS({
        * Sets a value in this document. For `!!set`, `value` needs to be a
        * boolean to add/remove the item from the set.
        */
-      set(key, value) {
+      set(key, value2) {
         if (this.contents == null) {
-          this.contents = Collection2.collectionFromPath(this.schema, [key], value);
+          this.contents = Collection2.collectionFromPath(this.schema, [key], value2);
         } else if (assertCollection(this.contents)) {
-          this.contents.set(key, value);
+          this.contents.set(key, value2);
         }
       }
       /**
        * Sets a value in this document. For `!!set`, `value` needs to be a
        * boolean to add/remove the item from the set.
        */
-      setIn(path, value) {
+      setIn(path, value2) {
         if (Collection2.isEmptyPath(path)) {
-          this.contents = value;
+          this.contents = value2;
         } else if (this.contents == null) {
-          this.contents = Collection2.collectionFromPath(this.schema, Array.from(path), value);
+          this.contents = Collection2.collectionFromPath(this.schema, Array.from(path), value2);
         } else if (assertCollection(this.contents)) {
-          this.contents.setIn(path, value);
+          this.contents.setIn(path, value2);
         }
       }
       /**
@@ -35021,7 +35021,7 @@ var require_resolve_block_map = __commonJS({
       let offset = bm.offset;
       let commentEnd = null;
       for (const collItem of bm.items) {
-        const { start, key, sep: sep3, value } = collItem;
+        const { start, key, sep: sep3, value: value2 } = collItem;
         const keyProps = resolveProps.resolveProps(start, {
           indicator: "explicit-key-ind",
           next: key ?? sep3?.[0],
@@ -35064,7 +35064,7 @@ var require_resolve_block_map = __commonJS({
           onError(keyStart, "DUPLICATE_KEY", "Map keys must be unique");
         const valueProps = resolveProps.resolveProps(sep3 ?? [], {
           indicator: "map-value-ind",
-          next: value,
+          next: value2,
           offset: keyNode.range[2],
           onError,
           parentIndent: bm.indent,
@@ -35073,14 +35073,14 @@ var require_resolve_block_map = __commonJS({
         offset = valueProps.end;
         if (valueProps.found) {
           if (implicitKey) {
-            if (value?.type === "block-map" && !valueProps.hasNewline)
+            if (value2?.type === "block-map" && !valueProps.hasNewline)
               onError(offset, "BLOCK_AS_IMPLICIT_KEY", "Nested mappings are not allowed in compact mappings");
             if (ctx.options.strict && keyProps.start < valueProps.found.offset - 1024)
               onError(keyNode.range, "KEY_OVER_1024_CHARS", "The : indicator must be at most 1024 chars after the start of an implicit block mapping key");
           }
-          const valueNode = value ? composeNode(ctx, value, valueProps, onError) : composeEmptyNode(ctx, offset, sep3, null, valueProps, onError);
+          const valueNode = value2 ? composeNode(ctx, value2, valueProps, onError) : composeEmptyNode(ctx, offset, sep3, null, valueProps, onError);
           if (ctx.schema.compat)
-            utilFlowIndentCheck.flowIndentCheck(bm.indent, value, onError);
+            utilFlowIndentCheck.flowIndentCheck(bm.indent, value2, onError);
           offset = valueNode.range[2];
           const pair = new Pair.Pair(keyNode, valueNode);
           if (ctx.options.keepSourceTokens)
@@ -35126,18 +35126,18 @@ var require_resolve_block_seq = __commonJS({
         ctx.atKey = false;
       let offset = bs.offset;
       let commentEnd = null;
-      for (const { start, value } of bs.items) {
+      for (const { start, value: value2 } of bs.items) {
         const props = resolveProps.resolveProps(start, {
           indicator: "seq-item-ind",
-          next: value,
+          next: value2,
           offset,
           onError,
           parentIndent: bs.indent,
           startOnNewline: true
         });
         if (!props.found) {
-          if (props.anchor || props.tag || value) {
-            if (value?.type === "block-seq")
+          if (props.anchor || props.tag || value2) {
+            if (value2?.type === "block-seq")
               onError(props.end, "BAD_INDENT", "All sequence items must start at the same column");
             else
               onError(offset, "MISSING_CHAR", "Sequence item without - indicator");
@@ -35148,9 +35148,9 @@ var require_resolve_block_seq = __commonJS({
             continue;
           }
         }
-        const node = value ? composeNode(ctx, value, props, onError) : composeEmptyNode(ctx, props.end, start, null, props, onError);
+        const node = value2 ? composeNode(ctx, value2, props, onError) : composeEmptyNode(ctx, props.end, start, null, props, onError);
         if (ctx.schema.compat)
-          utilFlowIndentCheck.flowIndentCheck(bs.indent, value, onError);
+          utilFlowIndentCheck.flowIndentCheck(bs.indent, value2, onError);
         offset = node.range[2];
         seq.items.push(node);
       }
@@ -35232,7 +35232,7 @@ var require_resolve_flow_collection = __commonJS({
       let offset = fc.offset + fc.start.source.length;
       for (let i2 = 0; i2 < fc.items.length; ++i2) {
         const collItem = fc.items[i2];
-        const { start, key, sep: sep3, value } = collItem;
+        const { start, key, sep: sep3, value: value2 } = collItem;
         const props = resolveProps.resolveProps(start, {
           flow: fcName,
           indicator: "explicit-key-ind",
@@ -35243,7 +35243,7 @@ var require_resolve_flow_collection = __commonJS({
           startOnNewline: false
         });
         if (!props.found) {
-          if (!props.anchor && !props.tag && !sep3 && !value) {
+          if (!props.anchor && !props.tag && !sep3 && !value2) {
             if (i2 === 0 && props.comma)
               onError(props.comma, "UNEXPECTED_TOKEN", `Unexpected , in ${fcName}`);
             else if (i2 < fc.items.length - 1)
@@ -35298,10 +35298,10 @@ var require_resolve_flow_collection = __commonJS({
           }
         }
         if (!isMap && !sep3 && !props.found) {
-          const valueNode = value ? composeNode(ctx, value, props, onError) : composeEmptyNode(ctx, props.end, sep3, null, props, onError);
+          const valueNode = value2 ? composeNode(ctx, value2, props, onError) : composeEmptyNode(ctx, props.end, sep3, null, props, onError);
           coll.items.push(valueNode);
           offset = valueNode.range[2];
-          if (isBlock(value))
+          if (isBlock(value2))
             onError(valueNode.range, "BLOCK_IN_FLOW", blockMsg);
         } else {
           ctx.atKey = true;
@@ -35313,7 +35313,7 @@ var require_resolve_flow_collection = __commonJS({
           const valueProps = resolveProps.resolveProps(sep3 ?? [], {
             flow: fcName,
             indicator: "map-value-ind",
-            next: value,
+            next: value2,
             offset: keyNode.range[2],
             onError,
             parentIndent: fc.indent,
@@ -35333,15 +35333,15 @@ var require_resolve_flow_collection = __commonJS({
               if (props.start < valueProps.found.offset - 1024)
                 onError(valueProps.found, "KEY_OVER_1024_CHARS", "The : indicator must be at most 1024 chars after the start of an implicit flow sequence key");
             }
-          } else if (value) {
-            if ("source" in value && value.source?.[0] === ":")
-              onError(value, "MISSING_CHAR", `Missing space after : in ${fcName}`);
+          } else if (value2) {
+            if ("source" in value2 && value2.source?.[0] === ":")
+              onError(value2, "MISSING_CHAR", `Missing space after : in ${fcName}`);
             else
               onError(valueProps.start, "MISSING_CHAR", `Missing , or : between ${fcName} items`);
           }
-          const valueNode = value ? composeNode(ctx, value, valueProps, onError) : valueProps.found ? composeEmptyNode(ctx, valueProps.end, sep3, null, valueProps, onError) : null;
+          const valueNode = value2 ? composeNode(ctx, value2, valueProps, onError) : valueProps.found ? composeEmptyNode(ctx, valueProps.end, sep3, null, valueProps, onError) : null;
           if (valueNode) {
-            if (isBlock(value))
+            if (isBlock(value2))
               onError(valueNode.range, "BLOCK_IN_FLOW", blockMsg);
           } else if (valueProps.comment) {
             if (keyNode.comment)
@@ -35484,11 +35484,11 @@ var require_resolve_block_scalar = __commonJS({
           break;
       }
       if (chompStart === 0) {
-        const value2 = header.chomp === "+" && lines.length > 0 ? "\n".repeat(Math.max(1, lines.length - 1)) : "";
+        const value3 = header.chomp === "+" && lines.length > 0 ? "\n".repeat(Math.max(1, lines.length - 1)) : "";
         let end2 = start + header.length;
         if (scalar.source)
           end2 += scalar.source.length;
-        return { value: value2, type, comment: header.comment, range: [start, end2, end2] };
+        return { value: value3, type, comment: header.comment, range: [start, end2, end2] };
       }
       let trimIndent = scalar.indent + header.indent;
       let offset = scalar.offset + header.length;
@@ -35518,11 +35518,11 @@ var require_resolve_block_scalar = __commonJS({
         if (lines[i2][0].length > trimIndent)
           chompStart = i2 + 1;
       }
-      let value = "";
+      let value2 = "";
       let sep3 = "";
       let prevMoreIndented = false;
       for (let i2 = 0; i2 < contentStart; ++i2)
-        value += lines[i2][0].slice(trimIndent) + "\n";
+        value2 += lines[i2][0].slice(trimIndent) + "\n";
       for (let i2 = contentStart; i2 < chompStart; ++i2) {
         let [indent, content] = lines[i2];
         offset += indent.length + content.length + 1;
@@ -35536,23 +35536,23 @@ var require_resolve_block_scalar = __commonJS({
           indent = "";
         }
         if (type === Scalar.Scalar.BLOCK_LITERAL) {
-          value += sep3 + indent.slice(trimIndent) + content;
+          value2 += sep3 + indent.slice(trimIndent) + content;
           sep3 = "\n";
         } else if (indent.length > trimIndent || content[0] === "	") {
           if (sep3 === " ")
             sep3 = "\n";
           else if (!prevMoreIndented && sep3 === "\n")
             sep3 = "\n\n";
-          value += sep3 + indent.slice(trimIndent) + content;
+          value2 += sep3 + indent.slice(trimIndent) + content;
           sep3 = "\n";
           prevMoreIndented = true;
         } else if (content === "") {
           if (sep3 === "\n")
-            value += "\n";
+            value2 += "\n";
           else
             sep3 = "\n";
         } else {
-          value += sep3 + content;
+          value2 += sep3 + content;
           sep3 = " ";
           prevMoreIndented = false;
         }
@@ -35562,15 +35562,15 @@ var require_resolve_block_scalar = __commonJS({
           break;
         case "+":
           for (let i2 = chompStart; i2 < lines.length; ++i2)
-            value += "\n" + lines[i2][0].slice(trimIndent);
-          if (value[value.length - 1] !== "\n")
-            value += "\n";
+            value2 += "\n" + lines[i2][0].slice(trimIndent);
+          if (value2[value2.length - 1] !== "\n")
+            value2 += "\n";
           break;
         default:
-          value += "\n";
+          value2 += "\n";
       }
       const end = start + header.length + scalar.source.length;
-      return { value, type, comment: header.comment, range: [start, end, end] };
+      return { value: value2, type, comment: header.comment, range: [start, end, end] };
     }
     function parseBlockScalarHeader({ offset, props }, strict, onError) {
       if (props[0].type !== "block-scalar-header") {
@@ -35655,20 +35655,20 @@ var require_resolve_flow_scalar = __commonJS({
     function resolveFlowScalar(scalar, strict, onError) {
       const { offset, type, source, end } = scalar;
       let _type;
-      let value;
+      let value2;
       const _onError = (rel, code, msg) => onError(offset + rel, code, msg);
       switch (type) {
         case "scalar":
           _type = Scalar.Scalar.PLAIN;
-          value = plainValue(source, _onError);
+          value2 = plainValue(source, _onError);
           break;
         case "single-quoted-scalar":
           _type = Scalar.Scalar.QUOTE_SINGLE;
-          value = singleQuotedValue(source, _onError);
+          value2 = singleQuotedValue(source, _onError);
           break;
         case "double-quoted-scalar":
           _type = Scalar.Scalar.QUOTE_DOUBLE;
-          value = doubleQuotedValue(source, _onError);
+          value2 = doubleQuotedValue(source, _onError);
           break;
         /* istanbul ignore next should not happen */
         default:
@@ -35683,7 +35683,7 @@ var require_resolve_flow_scalar = __commonJS({
       const valueEnd = offset + source.length;
       const re = resolveEnd.resolveEnd(end, valueEnd, strict, onError);
       return {
-        value,
+        value: value2,
         type: _type,
         comment: re.comment,
         range: [offset, valueEnd, re.offset]
@@ -35876,28 +35876,28 @@ var require_compose_scalar = __commonJS({
     var resolveBlockScalar = require_resolve_block_scalar();
     var resolveFlowScalar = require_resolve_flow_scalar();
     function composeScalar(ctx, token, tagToken, onError) {
-      const { value, type, comment, range } = token.type === "block-scalar" ? resolveBlockScalar.resolveBlockScalar(ctx, token, onError) : resolveFlowScalar.resolveFlowScalar(token, ctx.options.strict, onError);
+      const { value: value2, type, comment, range } = token.type === "block-scalar" ? resolveBlockScalar.resolveBlockScalar(ctx, token, onError) : resolveFlowScalar.resolveFlowScalar(token, ctx.options.strict, onError);
       const tagName = tagToken ? ctx.directives.tagName(tagToken.source, (msg) => onError(tagToken, "TAG_RESOLVE_FAILED", msg)) : null;
       let tag;
       if (ctx.options.stringKeys && ctx.atKey) {
         tag = ctx.schema[identity.SCALAR];
       } else if (tagName)
-        tag = findScalarTagByName(ctx.schema, value, tagName, tagToken, onError);
+        tag = findScalarTagByName(ctx.schema, value2, tagName, tagToken, onError);
       else if (token.type === "scalar")
-        tag = findScalarTagByTest(ctx, value, token, onError);
+        tag = findScalarTagByTest(ctx, value2, token, onError);
       else
         tag = ctx.schema[identity.SCALAR];
       let scalar;
       try {
-        const res = tag.resolve(value, (msg) => onError(tagToken ?? token, "TAG_RESOLVE_FAILED", msg), ctx.options);
+        const res = tag.resolve(value2, (msg) => onError(tagToken ?? token, "TAG_RESOLVE_FAILED", msg), ctx.options);
         scalar = identity.isScalar(res) ? res : new Scalar.Scalar(res);
       } catch (error2) {
         const msg = error2 instanceof Error ? error2.message : String(error2);
         onError(tagToken ?? token, "TAG_RESOLVE_FAILED", msg);
-        scalar = new Scalar.Scalar(value);
+        scalar = new Scalar.Scalar(value2);
       }
       scalar.range = range;
-      scalar.source = value;
+      scalar.source = value2;
       if (type)
         scalar.type = type;
       if (tagName)
@@ -35908,7 +35908,7 @@ var require_compose_scalar = __commonJS({
         scalar.comment = comment;
       return scalar;
     }
-    function findScalarTagByName(schema, value, tagName, tagToken, onError) {
+    function findScalarTagByName(schema, value2, tagName, tagToken, onError) {
       if (tagName === "!")
         return schema[identity.SCALAR];
       const matchWithTest = [];
@@ -35921,7 +35921,7 @@ var require_compose_scalar = __commonJS({
         }
       }
       for (const tag of matchWithTest)
-        if (tag.test?.test(value))
+        if (tag.test?.test(value2))
           return tag;
       const kt = schema.knownTags[tagName];
       if (kt && !kt.collection) {
@@ -35931,10 +35931,10 @@ var require_compose_scalar = __commonJS({
       onError(tagToken, "TAG_RESOLVE_FAILED", `Unresolved tag: ${tagName}`, tagName !== "tag:yaml.org,2002:str");
       return schema[identity.SCALAR];
     }
-    function findScalarTagByTest({ atKey, directives, schema }, value, token, onError) {
-      const tag = schema.tags.find((tag2) => (tag2.default === true || atKey && tag2.default === "key") && tag2.test?.test(value)) || schema[identity.SCALAR];
+    function findScalarTagByTest({ atKey, directives, schema }, value2, token, onError) {
+      const tag = schema.tags.find((tag2) => (tag2.default === true || atKey && tag2.default === "key") && tag2.test?.test(value2)) || schema[identity.SCALAR];
       if (schema.compat) {
-        const compat = schema.compat.find((tag2) => tag2.default && tag2.test?.test(value)) ?? schema[identity.SCALAR];
+        const compat = schema.compat.find((tag2) => tag2.default && tag2.test?.test(value2)) ?? schema[identity.SCALAR];
         if (tag.tag !== compat.tag) {
           const ts = directives.tagString(tag.tag);
           const cs = directives.tagString(compat.tag);
@@ -36092,7 +36092,7 @@ var require_compose_doc = __commonJS({
     var composeNode = require_compose_node();
     var resolveEnd = require_resolve_end();
     var resolveProps = require_resolve_props();
-    function composeDoc(options, directives, { offset, start, value, end }, onError) {
+    function composeDoc(options, directives, { offset, start, value: value2, end }, onError) {
       const opts = Object.assign({ _directives: directives }, options);
       const doc = new Document.Document(void 0, opts);
       const ctx = {
@@ -36104,7 +36104,7 @@ var require_compose_doc = __commonJS({
       };
       const props = resolveProps.resolveProps(start, {
         indicator: "doc-start",
-        next: value ?? end?.[0],
+        next: value2 ?? end?.[0],
         offset,
         onError,
         parentIndent: 0,
@@ -36112,10 +36112,10 @@ var require_compose_doc = __commonJS({
       });
       if (props.found) {
         doc.directives.docStart = true;
-        if (value && (value.type === "block-map" || value.type === "block-seq") && !props.hasNewline)
+        if (value2 && (value2.type === "block-map" || value2.type === "block-seq") && !props.hasNewline)
           onError(props.end, "MISSING_CHAR", "Block collection cannot start on same line with directives-end marker");
       }
-      doc.contents = value ? composeNode.composeNode(ctx, value, props, onError) : composeNode.composeEmptyNode(ctx, props.end, start, null, props, onError);
+      doc.contents = value2 ? composeNode.composeNode(ctx, value2, props, onError) : composeNode.composeEmptyNode(ctx, props.end, start, null, props, onError);
       const contentEnd = doc.contents.range[2];
       const re = resolveEnd.resolveEnd(end, contentEnd, false, onError);
       if (re.comment)
@@ -36363,9 +36363,9 @@ var require_cst_scalar = __commonJS({
       }
       return null;
     }
-    function createScalarToken(value, context3) {
+    function createScalarToken(value2, context3) {
       const { implicitKey = false, indent, inFlow = false, offset = -1, type = "PLAIN" } = context3;
-      const source = stringifyString.stringifyString({ type, value }, {
+      const source = stringifyString.stringifyString({ type, value: value2 }, {
         implicitKey,
         indent: indent > 0 ? " ".repeat(indent) : "",
         inFlow,
@@ -36395,7 +36395,7 @@ var require_cst_scalar = __commonJS({
           return { type: "scalar", offset, indent, source, end };
       }
     }
-    function setScalarValue(token, value, context3 = {}) {
+    function setScalarValue(token, value2, context3 = {}) {
       let { afterKey = false, implicitKey = false, inFlow = false, type } = context3;
       let indent = "indent" in token ? token.indent : null;
       if (afterKey && typeof indent === "number")
@@ -36418,7 +36418,7 @@ var require_cst_scalar = __commonJS({
           default:
             type = "PLAIN";
         }
-      const source = stringifyString.stringifyString({ type, value }, {
+      const source = stringifyString.stringifyString({ type, value: value2 }, {
         implicitKey: implicitKey || indent === null,
         indent: indent !== null && indent > 0 ? " ".repeat(indent) : "",
         inFlow,
@@ -36564,7 +36564,7 @@ var require_cst_stringify = __commonJS({
         }
       }
     }
-    function stringifyItem({ start, key, sep: sep3, value }) {
+    function stringifyItem({ start, key, sep: sep3, value: value2 }) {
       let res = "";
       for (const st of start)
         res += st.source;
@@ -36573,8 +36573,8 @@ var require_cst_stringify = __commonJS({
       if (sep3)
         for (const st of sep3)
           res += st.source;
-      if (value)
-        res += stringifyToken(value);
+      if (value2)
+        res += stringifyToken(value2);
       return res;
     }
     exports.stringify = stringify;
@@ -38307,7 +38307,7 @@ var require_public_api = __commonJS({
       }
       return doc.toJS(Object.assign({ reviver: _reviver }, options));
     }
-    function stringify(value, replacer, options) {
+    function stringify(value2, replacer, options) {
       let _replacer = null;
       if (typeof replacer === "function" || Array.isArray(replacer)) {
         _replacer = replacer;
@@ -38320,14 +38320,14 @@ var require_public_api = __commonJS({
         const indent = Math.round(options);
         options = indent < 1 ? void 0 : indent > 8 ? { indent: 8 } : { indent };
       }
-      if (value === void 0) {
+      if (value2 === void 0) {
         const { keepUndefined } = options ?? replacer ?? {};
         if (!keepUndefined)
           return void 0;
       }
-      if (identity.isDocument(value) && !_replacer)
-        return value.toString(options);
-      return new Document.Document(value, _replacer, options).toString(options);
+      if (identity.isDocument(value2) && !_replacer)
+        return value2.toString(options);
+      return new Document.Document(value2, _replacer, options).toString(options);
     }
     exports.parse = parse4;
     exports.parseAllDocuments = parseAllDocuments;
@@ -38539,13 +38539,13 @@ function lowercaseKeys(object) {
     return newObj;
   }, {});
 }
-function isPlainObject(value) {
-  if (typeof value !== "object" || value === null) return false;
-  if (Object.prototype.toString.call(value) !== "[object Object]") return false;
-  const proto = Object.getPrototypeOf(value);
+function isPlainObject(value2) {
+  if (typeof value2 !== "object" || value2 === null) return false;
+  if (Object.prototype.toString.call(value2) !== "[object Object]") return false;
+  const proto = Object.getPrototypeOf(value2);
   if (proto === null) return true;
   const Ctor = Object.prototype.hasOwnProperty.call(proto, "constructor") && proto.constructor;
-  return typeof Ctor === "function" && Ctor instanceof Ctor && Function.prototype.call(Ctor) === Function.prototype.call(value);
+  return typeof Ctor === "function" && Ctor instanceof Ctor && Function.prototype.call(Ctor) === Function.prototype.call(value2);
 }
 function mergeDeep(defaults2, options) {
   const result = Object.assign({}, defaults2);
@@ -38590,11 +38590,11 @@ function merge(defaults2, route, options) {
 }
 function addQueryParameters(url, parameters) {
   const separator = /\?/.test(url) ? "&" : "?";
-  const names = Object.keys(parameters);
-  if (names.length === 0) {
+  const names2 = Object.keys(parameters);
+  if (names2.length === 0) {
     return url;
   }
-  return url + separator + names.map((name) => {
+  return url + separator + names2.map((name) => {
     if (name === "q") {
       return "q=" + parameters.q.split("+").map(encodeURIComponent).join("+");
     }
@@ -38633,57 +38633,57 @@ function encodeUnreserved(str) {
     return "%" + c.charCodeAt(0).toString(16).toUpperCase();
   });
 }
-function encodeValue(operator, value, key) {
-  value = operator === "+" || operator === "#" ? encodeReserved(value) : encodeUnreserved(value);
+function encodeValue(operator, value2, key) {
+  value2 = operator === "+" || operator === "#" ? encodeReserved(value2) : encodeUnreserved(value2);
   if (key) {
-    return encodeUnreserved(key) + "=" + value;
+    return encodeUnreserved(key) + "=" + value2;
   } else {
-    return value;
+    return value2;
   }
 }
-function isDefined(value) {
-  return value !== void 0 && value !== null;
+function isDefined(value2) {
+  return value2 !== void 0 && value2 !== null;
 }
 function isKeyOperator(operator) {
   return operator === ";" || operator === "&" || operator === "?";
 }
 function getValues(context3, operator, key, modifier) {
-  var value = context3[key], result = [];
-  if (isDefined(value) && value !== "") {
-    if (typeof value === "string" || typeof value === "number" || typeof value === "bigint" || typeof value === "boolean") {
-      value = value.toString();
+  var value2 = context3[key], result = [];
+  if (isDefined(value2) && value2 !== "") {
+    if (typeof value2 === "string" || typeof value2 === "number" || typeof value2 === "bigint" || typeof value2 === "boolean") {
+      value2 = value2.toString();
       if (modifier && modifier !== "*") {
-        value = value.substring(0, parseInt(modifier, 10));
+        value2 = value2.substring(0, parseInt(modifier, 10));
       }
       result.push(
-        encodeValue(operator, value, isKeyOperator(operator) ? key : "")
+        encodeValue(operator, value2, isKeyOperator(operator) ? key : "")
       );
     } else {
       if (modifier === "*") {
-        if (Array.isArray(value)) {
-          value.filter(isDefined).forEach(function(value2) {
+        if (Array.isArray(value2)) {
+          value2.filter(isDefined).forEach(function(value22) {
             result.push(
-              encodeValue(operator, value2, isKeyOperator(operator) ? key : "")
+              encodeValue(operator, value22, isKeyOperator(operator) ? key : "")
             );
           });
         } else {
-          Object.keys(value).forEach(function(k) {
-            if (isDefined(value[k])) {
-              result.push(encodeValue(operator, value[k], k));
+          Object.keys(value2).forEach(function(k) {
+            if (isDefined(value2[k])) {
+              result.push(encodeValue(operator, value2[k], k));
             }
           });
         }
       } else {
         const tmp = [];
-        if (Array.isArray(value)) {
-          value.filter(isDefined).forEach(function(value2) {
-            tmp.push(encodeValue(operator, value2));
+        if (Array.isArray(value2)) {
+          value2.filter(isDefined).forEach(function(value22) {
+            tmp.push(encodeValue(operator, value22));
           });
         } else {
-          Object.keys(value).forEach(function(k) {
-            if (isDefined(value[k])) {
+          Object.keys(value2).forEach(function(k) {
+            if (isDefined(value2[k])) {
               tmp.push(encodeUnreserved(k));
-              tmp.push(encodeValue(operator, value[k].toString()));
+              tmp.push(encodeValue(operator, value2[k].toString()));
             }
           });
         }
@@ -38696,12 +38696,12 @@ function getValues(context3, operator, key, modifier) {
     }
   } else {
     if (operator === ";") {
-      if (isDefined(value)) {
+      if (isDefined(value2)) {
         result.push(encodeUnreserved(key));
       }
-    } else if (value === "" && (operator === "&" || operator === "?")) {
+    } else if (value2 === "" && (operator === "&" || operator === "?")) {
       result.push(encodeUnreserved(key) + "=");
-    } else if (value === "") {
+    } else if (value2 === "") {
       result.push("");
     }
   }
@@ -38877,8 +38877,8 @@ function parse3(header, options) {
     index++;
   }
   const valueEnd = whitespace === -1 ? index : whitespace;
-  const value = header.slice(valueStart, valueEnd);
-  const type = (typeFlags & CASE_FLAGS) === 0 ? value : value.toLowerCase();
+  const value2 = header.slice(valueStart, valueEnd);
+  const type = (typeFlags & CASE_FLAGS) === 0 ? value2 : value2.toLowerCase();
   if (index === len || stop !== 0) {
     return { type, index, parameters: new NullObject() };
   }
@@ -38904,8 +38904,8 @@ function parseParameters(header, type, index, len, stopFlags) {
       }
       if (code === EQ) {
         const keyEnd = keyWhitespace === -1 ? index : keyWhitespace;
-        const value = header.slice(keyStart, keyEnd);
-        const key = (keyFlags & CASE_FLAGS) === 0 ? value : value.toLowerCase();
+        const value2 = header.slice(keyStart, keyEnd);
+        const key = (keyFlags & CASE_FLAGS) === 0 ? value2 : value2.toLowerCase();
         index++;
         while ((CHAR_MAP[header.charCodeAt(index)] & OWS) !== 0) {
           index++;
@@ -39205,12 +39205,12 @@ var init_json_with_bigint = __esm({
       }
       return chunks.join("");
     };
-    JSONStringify = (value, replacer, space) => {
+    JSONStringify = (value2, replacer, space) => {
       try {
         const supportsRawJSON = "rawJSON" in JSON;
         if (supportsRawJSON) {
           return originalStringify(
-            value,
+            value2,
             (key, val) => {
               if (typeof val === "bigint") return JSON.rawJSON(val.toString());
               const hasFunctionReplacer = typeof replacer === "function";
@@ -39222,9 +39222,9 @@ var init_json_with_bigint = __esm({
             space
           );
         }
-        if (!value) return originalStringify(value, replacer, space);
+        if (!value2) return originalStringify(value2, replacer, space);
         const convertedToCustomJSON = originalStringify(
-          value,
+          value2,
           (key, val) => {
             const isNoise = typeof val === "string" && noiseValue.test(val);
             if (isNoise) return val.toString() + "n";
@@ -39245,7 +39245,7 @@ var init_json_with_bigint = __esm({
         return denoisedJSON;
       } catch (error2) {
         if (error2 instanceof RangeError) {
-          const convertedJSON = stringifyIteratively(value, replacer, space);
+          const convertedJSON = stringifyIteratively(value2, replacer, space);
           if (convertedJSON === void 0) return void 0;
           const supportsRawJSON = "rawJSON" in JSON;
           if (supportsRawJSON) return convertedJSON;
@@ -39273,26 +39273,26 @@ var init_json_with_bigint = __esm({
         return false;
       }
     };
-    convertMarkedBigIntsReviver = (key, value, context3, userReviver) => {
-      const isCustomFormatBigInt = typeof value === "string" && customFormat.test(value);
-      if (isCustomFormatBigInt) return BigInt(value.slice(0, -1));
-      const isNoiseValue = typeof value === "string" && noiseValue.test(value);
-      if (isNoiseValue) return value.slice(0, -1);
+    convertMarkedBigIntsReviver = (key, value2, context3, userReviver) => {
+      const isCustomFormatBigInt = typeof value2 === "string" && customFormat.test(value2);
+      if (isCustomFormatBigInt) return BigInt(value2.slice(0, -1));
+      const isNoiseValue = typeof value2 === "string" && noiseValue.test(value2);
+      if (isNoiseValue) return value2.slice(0, -1);
       const hasUserReviver = typeof userReviver === "function";
-      if (!hasUserReviver) return value;
-      return userReviver(key, value, context3);
+      if (!hasUserReviver) return value2;
+      return userReviver(key, value2, context3);
     };
     JSONParseV2 = (text2, reviver) => {
-      return JSON.parse(text2, (key, value, context3) => {
-        const isNumber = typeof value === "number";
-        const isOutOfBounds = value > Number.MAX_SAFE_INTEGER || value < Number.MIN_SAFE_INTEGER;
+      return JSON.parse(text2, (key, value2, context3) => {
+        const isNumber = typeof value2 === "number";
+        const isOutOfBounds = value2 > Number.MAX_SAFE_INTEGER || value2 < Number.MIN_SAFE_INTEGER;
         const isBigNumber = isNumber && isOutOfBounds;
         const isInt = context3 && intRegex.test(context3.source);
         const isBigInt = isBigNumber && isInt;
         if (isBigInt) return BigInt(context3.source);
         const hasCustomReviver = typeof reviver === "function";
-        if (!hasCustomReviver) return value;
-        return reviver(key, value, context3);
+        if (!hasCustomReviver) return value2;
+        return reviver(key, value2, context3);
       });
     };
     MAX_INT = Number.MAX_SAFE_INTEGER.toString();
@@ -39306,35 +39306,35 @@ var init_json_with_bigint = __esm({
         const node = stack[stack.length - 1];
         if (!node.visited) {
           node.visited = true;
-          const value = node.parent[node.key];
-          const isComplexObject = value !== null && typeof value === "object";
+          const value2 = node.parent[node.key];
+          const isComplexObject = value2 !== null && typeof value2 === "object";
           if (isComplexObject) {
-            const keys = Object.keys(value);
+            const keys = Object.keys(value2);
             for (let i2 = keys.length - 1; i2 >= 0; i2--) {
-              stack.push({ parent: value, key: keys[i2], visited: false });
+              stack.push({ parent: value2, key: keys[i2], visited: false });
             }
           }
         } else {
           const { parent, key } = node;
-          let value = parent[key];
-          if (typeof value === "string") {
-            const isCustomFormatBigInt = customFormat.test(value);
+          let value2 = parent[key];
+          if (typeof value2 === "string") {
+            const isCustomFormatBigInt = customFormat.test(value2);
             if (isCustomFormatBigInt) {
-              value = BigInt(value.slice(0, -1));
+              value2 = BigInt(value2.slice(0, -1));
             } else {
-              const isNoise = noiseValue.test(value);
-              if (isNoise) value = value.slice(0, -1);
+              const isNoise = noiseValue.test(value2);
+              if (isNoise) value2 = value2.slice(0, -1);
             }
           }
           const hasUserReviver = typeof userReviver === "function";
           if (hasUserReviver) {
-            value = userReviver.call(parent, key, value);
+            value2 = userReviver.call(parent, key, value2);
           }
-          const isDeleted = value === void 0;
+          const isDeleted = value2 === void 0;
           if (isDeleted) {
             delete parent[key];
           } else {
-            parent[key] = value;
+            parent[key] = value2;
           }
           stack.pop();
         }
@@ -39344,12 +39344,12 @@ var init_json_with_bigint = __esm({
     serializeBigInts = (text2) => {
       return text2.replace(
         stringsOrLargeNumbers,
-        (match, digits, fractional, exponential) => {
+        (match, digits2, fractional, exponential) => {
           const isString = match[0] === '"';
           const isNoise = isString && noiseValueWithQuotes.test(match);
           if (isNoise) return match.substring(0, match.length - 1) + 'n"';
           const hasFractionalOrExponential = fractional || exponential;
-          const isLessThanMaxSafeInt = digits && (digits.length < MAX_DIGITS || digits.length === MAX_DIGITS && digits <= MAX_INT);
+          const isLessThanMaxSafeInt = digits2 && (digits2.length < MAX_DIGITS || digits2.length === MAX_DIGITS && digits2 <= MAX_INT);
           const isStandardValue = isString || hasFractionalOrExponential || isLessThanMaxSafeInt;
           if (isStandardValue) return match;
           return '"' + match + 'n"';
@@ -39363,7 +39363,7 @@ var init_json_with_bigint = __esm({
         const serializedData = serializeBigInts(text2);
         return originalParse(
           serializedData,
-          (key, value, context3) => convertMarkedBigIntsReviver(key, value, context3, reviver)
+          (key, value2, context3) => convertMarkedBigIntsReviver(key, value2, context3, reviver)
         );
       } catch (error2) {
         if (error2 instanceof RangeError) {
@@ -39422,13 +39422,13 @@ var init_dist_src = __esm({
 });
 
 // node_modules/@octokit/request/dist-bundle/index.js
-function isPlainObject2(value) {
-  if (typeof value !== "object" || value === null) return false;
-  if (Object.prototype.toString.call(value) !== "[object Object]") return false;
-  const proto = Object.getPrototypeOf(value);
+function isPlainObject2(value2) {
+  if (typeof value2 !== "object" || value2 === null) return false;
+  if (Object.prototype.toString.call(value2) !== "[object Object]") return false;
+  const proto = Object.getPrototypeOf(value2);
   if (proto === null) return true;
   const Ctor = Object.prototype.hasOwnProperty.call(proto, "constructor") && proto.constructor;
-  return typeof Ctor === "function" && Ctor instanceof Ctor && Function.prototype.call(Ctor) === Function.prototype.call(value);
+  return typeof Ctor === "function" && Ctor instanceof Ctor && Function.prototype.call(Ctor) === Function.prototype.call(value2);
 }
 async function fetchWrapper(requestOptions) {
   const fetch2 = requestOptions.request?.fetch || globalThis.fetch;
@@ -39441,9 +39441,9 @@ async function fetchWrapper(requestOptions) {
   const parseSuccessResponseBody = requestOptions.request?.parseSuccessResponseBody !== false;
   const body = isPlainObject2(requestOptions.body) || Array.isArray(requestOptions.body) ? JSONStringify(requestOptions.body) : requestOptions.body;
   const requestHeaders = Object.fromEntries(
-    Object.entries(requestOptions.headers).map(([name, value]) => [
+    Object.entries(requestOptions.headers).map(([name, value2]) => [
       name,
-      String(value)
+      String(value2)
     ])
   );
   let fetchResponse;
@@ -39483,8 +39483,8 @@ async function fetchWrapper(requestOptions) {
   const status = fetchResponse.status;
   const url = fetchResponse.url;
   const responseHeaders = {};
-  for (const [key, value] of fetchResponse.headers) {
-    responseHeaders[key] = value;
+  for (const [key, value2] of fetchResponse.headers) {
+    responseHeaders[key] = value2;
   }
   const octokitResponse = {
     url,
@@ -42459,8 +42459,8 @@ var init_endpoints_to_methods = __esm({
       ownKeys({ scope }) {
         return [...endpointMethodsMap.get(scope).keys()];
       },
-      set(target, methodName, value) {
-        return target.cache[methodName] = value;
+      set(target, methodName, value2) {
+        return target.cache[methodName] = value2;
       },
       get({ octokit, scope, cache }, methodName) {
         if (cache[methodName]) {
@@ -42553,14 +42553,14 @@ var require_light = __commonJS({
           this._last = null;
           this.length = 0;
         }
-        push(value) {
+        push(value2) {
           var node;
           this.length++;
           if (typeof this.incr === "function") {
             this.incr();
           }
           node = {
-            value,
+            value: value2,
             prev: this._last,
             next: null
           };
@@ -42573,7 +42573,7 @@ var require_light = __commonJS({
           return void 0;
         }
         shift() {
-          var value;
+          var value2;
           if (this._first == null) {
             return;
           } else {
@@ -42582,13 +42582,13 @@ var require_light = __commonJS({
               this.decr();
             }
           }
-          value = this._first.value;
+          value2 = this._first.value;
           if ((this._first = this._first.next) != null) {
             this._first.prev = null;
           } else {
             this._last = null;
           }
-          return value;
+          return value2;
         }
         first() {
           if (this._first != null) {
@@ -42929,7 +42929,7 @@ var require_light = __commonJS({
           var base;
           if (this.heartbeat == null && (this.storeOptions.reservoirRefreshInterval != null && this.storeOptions.reservoirRefreshAmount != null || this.storeOptions.reservoirIncreaseInterval != null && this.storeOptions.reservoirIncreaseAmount != null)) {
             return typeof (base = this.heartbeat = setInterval(() => {
-              var amount, incr, maximum, now, reservoir;
+              var amount2, incr, maximum, now, reservoir;
               now = Date.now();
               if (this.storeOptions.reservoirRefreshInterval != null && now >= this._lastReservoirRefresh + this.storeOptions.reservoirRefreshInterval) {
                 this._lastReservoirRefresh = now;
@@ -42938,12 +42938,12 @@ var require_light = __commonJS({
               }
               if (this.storeOptions.reservoirIncreaseInterval != null && now >= this._lastReservoirIncrease + this.storeOptions.reservoirIncreaseInterval) {
                 ({
-                  reservoirIncreaseAmount: amount,
+                  reservoirIncreaseAmount: amount2,
                   reservoirIncreaseMaximum: maximum,
                   reservoir
                 } = this.storeOptions);
                 this._lastReservoirIncrease = now;
-                incr = maximum != null ? Math.min(amount, maximum - reservoir) : amount;
+                incr = maximum != null ? Math.min(amount2, maximum - reservoir) : amount2;
                 if (incr > 0) {
                   this.storeOptions.reservoir += incr;
                   return this.instance._drainAll(this.computeCapacity());
@@ -44009,22 +44009,22 @@ var require_lib = __commonJS({
       };
     })();
     var __awaiter3 = exports && exports.__awaiter || function(thisArg, _arguments, P, generator) {
-      function adopt(value) {
-        return value instanceof P ? value : new P(function(resolve5) {
-          resolve5(value);
+      function adopt(value2) {
+        return value2 instanceof P ? value2 : new P(function(resolve5) {
+          resolve5(value2);
         });
       }
       return new (P || (P = Promise))(function(resolve5, reject) {
-        function fulfilled(value) {
+        function fulfilled(value2) {
           try {
-            step(generator.next(value));
+            step(generator.next(value2));
           } catch (e) {
             reject(e);
           }
         }
-        function rejected(value) {
+        function rejected(value2) {
           try {
-            step(generator["throw"](value));
+            step(generator["throw"](value2));
           } catch (e) {
             reject(e);
           }
@@ -44610,14 +44610,14 @@ var require_lib = __commonJS({
             if (statusCode === HttpCodes2.NotFound) {
               resolve5(response);
             }
-            function dateTimeDeserializer(key, value) {
-              if (typeof value === "string") {
-                const a = new Date(value);
+            function dateTimeDeserializer(key, value2) {
+              if (typeof value2 === "string") {
+                const a = new Date(value2);
                 if (!isNaN(a.valueOf())) {
                   return a;
                 }
               }
-              return value;
+              return value2;
             }
             let obj;
             let contents;
@@ -44704,22 +44704,22 @@ var init_utils = __esm({
     httpClient = __toESM(require_lib(), 1);
     import_undici2 = __toESM(require_undici(), 1);
     __awaiter2 = function(thisArg, _arguments, P, generator) {
-      function adopt(value) {
-        return value instanceof P ? value : new P(function(resolve5) {
-          resolve5(value);
+      function adopt(value2) {
+        return value2 instanceof P ? value2 : new P(function(resolve5) {
+          resolve5(value2);
         });
       }
       return new (P || (P = Promise))(function(resolve5, reject) {
-        function fulfilled(value) {
+        function fulfilled(value2) {
           try {
-            step(generator.next(value));
+            step(generator.next(value2));
           } catch (e) {
             reject(e);
           }
         }
-        function rejected(value) {
+        function rejected(value2) {
           try {
-            step(generator["throw"](value));
+            step(generator["throw"](value2));
           } catch (e) {
             reject(e);
           }
@@ -44882,9 +44882,9 @@ function issueFileCommand(command, message) {
     encoding: "utf8"
   });
 }
-function prepareKeyValueMessage(key, value) {
+function prepareKeyValueMessage(key, value2) {
   const delimiter = `ghadelimiter_${crypto.randomUUID()}`;
-  const convertedValue = toCommandValue(value);
+  const convertedValue = toCommandValue(value2);
   if (key.includes(delimiter)) {
     throw new Error(`Unexpected input: name should not contain the delimiter "${delimiter}"`);
   }
@@ -44956,22 +44956,22 @@ var HttpResponseRetryCodes = [
 import { EOL as EOL3 } from "os";
 import { constants, promises } from "fs";
 var __awaiter = function(thisArg, _arguments, P, generator) {
-  function adopt(value) {
-    return value instanceof P ? value : new P(function(resolve5) {
-      resolve5(value);
+  function adopt(value2) {
+    return value2 instanceof P ? value2 : new P(function(resolve5) {
+      resolve5(value2);
     });
   }
   return new (P || (P = Promise))(function(resolve5, reject) {
-    function fulfilled(value) {
+    function fulfilled(value2) {
       try {
-        step(generator.next(value));
+        step(generator.next(value2));
       } catch (e) {
         reject(e);
       }
     }
-    function rejected(value) {
+    function rejected(value2) {
       try {
-        step(generator["throw"](value));
+        step(generator["throw"](value2));
       } catch (e) {
         reject(e);
       }
@@ -45022,7 +45022,7 @@ var Summary = class {
    * @returns {string} content wrapped in HTML element
    */
   wrap(tag, content, attrs = {}) {
-    const htmlAttrs = Object.entries(attrs).map(([key, value]) => ` ${key}="${value}"`).join("");
+    const htmlAttrs = Object.entries(attrs).map(([key, value2]) => ` ${key}="${value2}"`).join("");
     if (!content) {
       return `<${tag}${htmlAttrs}>`;
     }
@@ -45272,13 +45272,13 @@ function getInput(name, options) {
   }
   return val.trim();
 }
-function setOutput(name, value) {
+function setOutput(name, value2) {
   const filePath = process.env["GITHUB_OUTPUT"] || "";
   if (filePath) {
-    return issueFileCommand("OUTPUT", prepareKeyValueMessage(name, value));
+    return issueFileCommand("OUTPUT", prepareKeyValueMessage(name, value2));
   }
   process.stdout.write(os4.EOL);
-  issueCommand("set-output", { name }, toCommandValue(value));
+  issueCommand("set-output", { name }, toCommandValue(value2));
 }
 function setFailed(message) {
   process.exitCode = ExitCode.Failure;
@@ -45303,15 +45303,15 @@ function formatIssue(issue2) {
   if (issue2.hint !== void 0) text2 += ` ${issue2.hint}`;
   return text2;
 }
-function quote(value) {
+function quote(value2) {
   let text2;
-  if (typeof value === "string") text2 = JSON.stringify(value);
-  else if (typeof value === "number" && !Number.isFinite(value)) text2 = String(value);
+  if (typeof value2 === "string") text2 = JSON.stringify(value2);
+  else if (typeof value2 === "number" && !Number.isFinite(value2)) text2 = String(value2);
   else {
     try {
-      text2 = JSON.stringify(value) ?? String(value);
+      text2 = JSON.stringify(value2) ?? String(value2);
     } catch {
-      text2 = String(value);
+      text2 = String(value2);
     }
   }
   return text2.length > 60 ? `${text2.slice(0, 57)}...` : text2;
@@ -45359,7 +45359,7 @@ function handleFailure(error2) {
 // src/entries/action/io.ts
 function coreIO() {
   return {
-    setOutput: (name, value) => setOutput(name, value),
+    setOutput: (name, value2) => setOutput(name, value2),
     info: (message) => info(message),
     warning: (message) => warning(message),
     setFailed: (message) => setFailed(message),
@@ -45370,28 +45370,51 @@ function coreIO() {
 }
 
 // src/analysis/gate.ts
-var RULES = {
-  "worse-validation": (r) => r.validation.change === "worse" ? "validation got significantly worse" : null,
-  "toward-overfitting": (r) => r.movement === "toward-overfitting" ? "the change moved toward overfitting" : null,
-  "toward-underfitting": (r) => r.movement === "toward-underfitting" ? "the change moved toward underfitting" : null,
-  "worse-on-both": (r) => r.movement === "worse-on-both" ? "bias and variance both got worse" : null,
-  "any-movement": (r) => r.movement !== "no-significant-change" ? `the model moved (${r.movement})` : null,
-  "slice-regression": (r) => {
-    const worse = r.slices.filter((s) => s.change === "worse");
-    return worse.length > 0 ? `${worse.length} slice(s) regressed significantly` : null;
-  },
-  "high-bias": (r) => r.candidate.diagnosis === "high-bias" || r.candidate.diagnosis === "high-bias-and-variance" ? "the candidate has high bias" : null,
-  "high-variance": (r) => r.candidate.diagnosis === "high-variance" || r.candidate.diagnosis === "high-bias-and-variance" ? "the candidate has high variance" : null,
-  "data-mismatch": (r) => r.candidate.diagnosis === "data-mismatch" ? "the candidate shows data mismatch" : null,
-  "validation-overfit": (r) => r.candidate.components.overfit.present ? "the candidate overfits the validation set (test error well above validation)" : null,
-  none: () => null
-};
-function applyGate(review) {
-  const failOn = review.settings.failOn;
+var RULES = /* @__PURE__ */ new Map([
+  ["worse-validation", (r) => fired(r.validation.change === "worse", "worse-validation")],
+  ["toward-overfitting", (r) => fired(r.movement === "toward-overfitting", "toward-overfitting")],
+  [
+    "toward-underfitting",
+    (r) => fired(r.movement === "toward-underfitting", "toward-underfitting")
+  ],
+  ["worse-on-both", (r) => fired(r.movement === "worse-on-both", "worse-on-both")],
+  ["any-movement", (r) => fired(r.movement !== "no-significant-change", "any-movement")],
+  [
+    "slice-regression",
+    (r) => {
+      const slices2 = r.slices.filter((s) => s.change === "worse").length;
+      return slices2 > 0 ? { outcome: "slice-regression", slices: slices2 } : null;
+    }
+  ],
+  [
+    "high-bias",
+    (r) => fired(
+      r.candidate.diagnosis === "high-bias" || r.candidate.diagnosis === "high-bias-and-variance",
+      "high-bias"
+    )
+  ],
+  [
+    "high-variance",
+    (r) => fired(
+      r.candidate.diagnosis === "high-variance" || r.candidate.diagnosis === "high-bias-and-variance",
+      "high-variance"
+    )
+  ],
+  ["data-mismatch", (r) => fired(r.candidate.diagnosis === "data-mismatch", "data-mismatch")],
+  [
+    "validation-overfit",
+    (r) => fired(r.candidate.components.overfit.present, "validation-overfit")
+  ],
+  ["none", () => null]
+]);
+function fired(condition, outcome) {
+  return condition ? { outcome } : null;
+}
+function applyGate(review, failOn) {
   const reasons = [];
   for (const policy of failOn) {
-    const reason = RULES[policy]?.(review) ?? null;
-    if (reason !== null) reasons.push(`${policy}: ${reason}`);
+    const reason = RULES.get(policy)?.(review) ?? null;
+    if (reason !== null) reasons.push(reason);
   }
   return { pass: reasons.length === 0, reasons, failOn: [...failOn] };
 }
@@ -46040,9 +46063,303 @@ function predictionsEntry(runBytes, runName, entries) {
   return entries.find((e) => e.name === wanted);
 }
 
+// src/report/escape.ts
+var DEFAULT_MAX_NAME = 80;
+var ZWJ = "\u200D";
+var REMOVED = /[\p{Cc}\p{Cf}\p{Cs}]/gu;
+var BREAKS = /[\t\n\v\f\r\u0085\u2028\u2029]/g;
+function plainText(text2, maxChars = DEFAULT_MAX_NAME) {
+  const cleaned = text2.replace(BREAKS, " ").replace(REMOVED, "").replace(/\s+/g, " ").trim();
+  return truncate(cleaned, maxChars);
+}
+function truncate(text2, maxChars) {
+  const points = Array.from(text2);
+  if (points.length <= maxChars) return text2;
+  return `${points.slice(0, Math.max(0, maxChars - 1)).join("").trimEnd()}\u2026`;
+}
+function escapeInline(text2, maxChars = DEFAULT_MAX_NAME) {
+  const plain = plainText(text2, maxChars);
+  let out = "";
+  for (const ch of plain) {
+    out += escapeChar(ch);
+  }
+  return out.replace(/:\/\//g, `:${ZWJ}//`).replace(/\b(www)\./gi, `$1${ZWJ}.`).replace(/\b(GH)-(?=\d)/gi, `$1-${ZWJ}`);
+}
+function escapeChar(ch) {
+  switch (ch) {
+    case "&":
+      return "&amp;";
+    case "<":
+      return "&lt;";
+    case ">":
+      return "&gt;";
+    case "@":
+      return `@${ZWJ}`;
+    case "#":
+      return `\\#${ZWJ}`;
+    default:
+      return MARKDOWN_PUNCTUATION.has(ch) ? `\\${ch}` : ch;
+  }
+}
+var MARKDOWN_PUNCTUATION = /* @__PURE__ */ new Set(["\\", "`", "*", "_", "[", "]", "|", "~", "$"]);
+function mermaidLabel(text2, maxChars = 60) {
+  const kept = plainText(text2, Number.MAX_SAFE_INTEGER).replace(/[^\p{L}\p{N} .,\-+()/=]/gu, " ").replace(/ {2,}/g, " ").trim();
+  return truncate(kept, maxChars);
+}
+function displayValue(value2) {
+  if (value2 === void 0) return "(absent)";
+  if (typeof value2 === "string") return value2;
+  if (typeof value2 === "number" || typeof value2 === "boolean" || value2 === null) {
+    return String(value2);
+  }
+  try {
+    return JSON.stringify(value2) ?? String(value2);
+  } catch {
+    return String(value2);
+  }
+}
+
+// src/report/format.ts
+var MINUS = "\u2212";
+var SIGNIFICANT = 4;
+var MAX_DECIMALS = 6;
+function numberFormatFor(review) {
+  let largest = 0;
+  for (const change2 of review.splits) {
+    largest = Math.max(largest, Math.abs(change2.baseline), Math.abs(change2.candidate));
+  }
+  const decimals = largest === 0 || !Number.isFinite(largest) ? SIGNIFICANT : Math.min(MAX_DECIMALS, Math.max(0, SIGNIFICANT - 1 - Math.floor(Math.log10(largest))));
+  return { kind: review.metric.kind, decimals };
+}
+function digits(v, f) {
+  const proportion = f.kind === "proportion";
+  const text2 = (proportion ? v * 100 : v).toFixed(
+    proportion ? Math.max(0, f.decimals - 2) : f.decimals
+  );
+  if (/^-0(\.0+)?$/.test(text2)) return text2.slice(1);
+  return text2.replace("-", MINUS);
+}
+function isZero(text2) {
+  return /^0(\.0+)?$/.test(text2);
+}
+function value(v, f) {
+  return f.kind === "proportion" ? `${digits(v, f)}%` : digits(v, f);
+}
+function unit(f) {
+  return f.kind === "proportion" ? " pts" : "";
+}
+function signedDigits(v, f) {
+  const text2 = digits(Math.abs(v), f);
+  if (isZero(text2)) return text2;
+  return v > 0 ? `+${text2}` : `${MINUS}${text2}`;
+}
+function change(v, f) {
+  return `${signedDigits(v, f)}${unit(f)}`;
+}
+function amount(v, f) {
+  return `${digits(Math.abs(v), f)}${unit(f)}`;
+}
+function difference(v, f) {
+  return `${digits(v, f)}${unit(f)}`;
+}
+function changeInterval(ci, f) {
+  if (ci === null) return "n/a";
+  return `[${signedDigits(ci[0], f)}, ${signedDigits(ci[1], f)}]${unit(f)}`;
+}
+function valueRange(ci, f) {
+  return `${value(ci[0], f)} to ${value(ci[1], f)}`;
+}
+function unitLine(f, values) {
+  if (f.kind !== "proportion") return null;
+  return values === "values" ? "Values in percent; \u0394 and intervals in percentage points." : "Components, \u0394 and intervals in percentage points.";
+}
+function valueCell(v, f) {
+  return digits(v, f);
+}
+function changeCell(v, f) {
+  return signedDigits(v, f);
+}
+function intervalCell(ci, f) {
+  if (ci === null) return "n/a";
+  return `[${signedDigits(ci[0], f)}, ${signedDigits(ci[1], f)}]`;
+}
+var SMALLEST_P = 1e-3;
+function pCell(p) {
+  if (p === null) return "n/a";
+  return p < SMALLEST_P ? `< ${SMALLEST_P}` : p.toFixed(3);
+}
+function pText(p) {
+  if (p === null) return "p n/a";
+  return p < SMALLEST_P ? `p < ${SMALLEST_P}` : `p = ${p.toFixed(3)}`;
+}
+function count(n) {
+  return Math.round(n).toString().replace(/\B(?=(\d{3})+(?!\d))/g, ",");
+}
+function short(v) {
+  if (v === 0) return "0";
+  const abs = Math.abs(v);
+  const text2 = abs >= 1e6 || abs < 1e-4 ? v.toExponential(2) : String(Number(v.toPrecision(4)));
+  return text2.replace(/-/g, MINUS);
+}
+function fixed(v, decimals) {
+  const text2 = v.toFixed(decimals);
+  return /^-0(\.0+)?$/.test(text2) ? text2.slice(1) : text2.replace("-", MINUS);
+}
+function chartNumber(v, decimals) {
+  const text2 = v.toFixed(decimals);
+  return /^-0(\.0+)?$/.test(text2) ? text2.slice(1) : text2;
+}
+
+// src/report/words.ts
+function words(entries) {
+  return new Map(Object.entries(entries));
+}
+function say(table2, code, esc) {
+  return table2.get(code) ?? esc(String(code), 60);
+}
+var MOVEMENT_TITLE = words({
+  "better-on-both": "less bias and less variance",
+  "away-from-underfitting": "away from underfitting",
+  "toward-overfitting": "toward overfitting",
+  "away-from-overfitting": "away from overfitting",
+  "no-significant-change": "no change beyond noise",
+  "toward-underfitting": "toward underfitting",
+  "worse-on-both": "more bias and more variance"
+});
+var MOVEMENT_SENTENCE = words({
+  "better-on-both": "The change lowered both avoidable bias and variance",
+  "away-from-underfitting": "The change moved the model away from underfitting",
+  "toward-overfitting": "The change moved the model toward overfitting",
+  "away-from-overfitting": "The change moved the model away from overfitting",
+  "no-significant-change": "The change did not move avoidable bias or variance beyond run-to-run noise",
+  "toward-underfitting": "The change moved the model toward underfitting",
+  "worse-on-both": "The change raised both avoidable bias and variance"
+});
+var VALIDATION_WORD = words({
+  better: "better",
+  worse: "worse",
+  flat: "unchanged within noise"
+});
+var DIAGNOSIS_WORD = words({
+  "good-fit": "good fit",
+  "high-bias": "high bias (underfitting)",
+  "high-variance": "high variance (overfitting)",
+  "data-mismatch": "data mismatch",
+  "high-bias-and-variance": "high bias and high variance"
+});
+var COMPONENT_TITLE = words({
+  bias: "Avoidable bias",
+  variance: "Variance",
+  mismatch: "Data mismatch",
+  overfit: "Validation overfit"
+});
+var COMPONENT_WORD = words({
+  bias: "avoidable bias",
+  variance: "variance",
+  mismatch: "data mismatch",
+  overfit: "validation overfit"
+});
+var COMPONENT_ORDER = [
+  "bias",
+  "variance",
+  "mismatch",
+  "overfit"
+];
+var SPLIT_WORD = words({
+  train: "train",
+  train_dev: "train-dev",
+  validation: "validation",
+  test: "test"
+});
+var LEVER_TITLE = words({
+  "more-data": "Add training data",
+  "fewer-features": "Use fewer features",
+  "stronger-regularization": "Strengthen regularization",
+  "smaller-model": "Use a smaller model",
+  "early-stopping": "Stop training earlier",
+  "more-features": "Add features",
+  "richer-features": "Add polynomial or interaction terms",
+  "weaker-regularization": "Weaken regularization",
+  "bigger-model": "Use a bigger model",
+  "train-longer": "Train longer",
+  "align-training-data": "Make training data look like validation data",
+  "bigger-validation-set": "Use a bigger validation set",
+  "add-repeats": "Repeat each run with several seeds",
+  "supply-reference": "Supply a reference error level"
+});
+var TEST_WORD = words({
+  "welch-t": "Welch's t-test",
+  "z-binomial": "binomial z-test",
+  "mcnemar-exact": "McNemar's exact test",
+  "paired-t": "paired t-test",
+  none: "no test"
+});
+var TEST_WHY = words({
+  "welch-t": "Welch's t-test on per-repeat values: each run has two or more repeats (seeds), and their spreads may differ.",
+  "z-binomial": "normal approximation with binomial variances: one repeat of a proportion metric measured on a known number of examples.",
+  "mcnemar-exact": "McNemar's exact test: both runs scored the same examples, so only the examples on which they disagree carry information.",
+  "paired-t": "paired t-test on per-example loss differences: both runs scored the same examples with a continuous loss.",
+  none: "no test: with one repeat of a continuous metric and no paired predictions, run-to-run noise is unknown, so only min-effect decides."
+});
+var REFERENCE_SOURCE = words({
+  artifact: "from the artifact",
+  config: "from the config",
+  default: "the default for a minimized proportion",
+  unknown: "source unknown"
+});
+function reading(call, review) {
+  if (call === "flat") return "flat";
+  const up = call === "up";
+  return up === (review.metric.goal === "maximize") ? "better" : "worse";
+}
+function componentReading(call, compact) {
+  if (call === "up") return compact ? "worse" : "up (worse)";
+  if (call === "down") return compact ? "better" : "down (better)";
+  return "flat";
+}
+function levelPercent(review) {
+  return String(Number(((1 - review.settings.alpha) * 100).toPrecision(4)));
+}
+var CAUTION = "This verdict is advice for a human reviewer, not a proof: it rests on the numbers the two runs recorded and on the tests named in the method notes.";
+
+// src/report/gate.ts
+var OUTCOME_SENTENCE = /* @__PURE__ */ new Map([
+  ["worse-validation", "validation got significantly worse"],
+  ["toward-overfitting", "the change moved toward overfitting"],
+  ["toward-underfitting", "the change moved toward underfitting"],
+  ["worse-on-both", "bias and variance both got worse"],
+  ["high-bias", "the candidate has high bias"],
+  ["high-variance", "the candidate has high variance"],
+  ["data-mismatch", "the candidate shows data mismatch"],
+  [
+    "validation-overfit",
+    "the candidate overfits the validation set (test error well above validation)"
+  ]
+]);
+function reasonSentence(reason, review, esc) {
+  if (reason.outcome === "any-movement")
+    return `the model moved (${say(MOVEMENT_TITLE, review.movement, esc)})`;
+  if (reason.outcome === "slice-regression") {
+    const n = reason.slices ?? 0;
+    return `${count(n)} ${n === 1 ? "slice" : "slices"} regressed significantly`;
+  }
+  return OUTCOME_SENTENCE.get(reason.outcome) ?? "fired";
+}
+function gateReasonLines(review, esc) {
+  return review.gate.reasons.map(
+    (reason) => `${esc(reason.outcome, 60)}: ${reasonSentence(reason, review, esc)}`
+  );
+}
+function gateSentence(review, esc) {
+  const gate = review.gate;
+  if (!gate.pass) return `${gateReasonLines(review, esc).join("; ")}.`;
+  if (gate.failOn.length === 0) return "no fail-on policy is set.";
+  return `none of fail-on (${gate.failOn.map((p) => esc(p, 60)).join(", ")}) applies.`;
+}
+
 // node_modules/markdown-table/index.js
-function defaultStringLength(value) {
-  return value.length;
+function defaultStringLength(value2) {
+  return value2.length;
 }
 function markdownTable(table2, options) {
   const settings = options || {};
@@ -46175,208 +46492,87 @@ function markdownTable(table2, options) {
   }
   return lines.join("\n");
 }
-function serialize(value) {
-  return value === null || value === void 0 ? "" : String(value);
+function serialize(value2) {
+  return value2 === null || value2 === void 0 ? "" : String(value2);
 }
-function toAlignment(value) {
-  const code = typeof value === "string" ? value.codePointAt(0) : 0;
+function toAlignment(value2) {
+  const code = typeof value2 === "string" ? value2.codePointAt(0) : 0;
   return code === 67 || code === 99 ? 99 : code === 76 || code === 108 ? 108 : code === 82 || code === 114 ? 114 : 0;
 }
 
-// src/report/escape.ts
-var DEFAULT_MAX_NAME = 80;
-var ZWJ = "\u200D";
-var REMOVED = /[\p{Cc}\p{Cf}\p{Cs}]/gu;
-var BREAKS = /[\t\n\v\f\r\u0085\u2028\u2029]/g;
-function plainText(text2, maxChars = DEFAULT_MAX_NAME) {
-  const cleaned = text2.replace(BREAKS, " ").replace(REMOVED, "").replace(/\s+/g, " ").trim();
-  return truncate(cleaned, maxChars);
+// src/report/levers.ts
+function leverText(lever, review, f, esc) {
+  const ctx = { review, f, esc };
+  const sentences = lever.evidence.flatMap((e) => evidenceSentence(e, lever.id, ctx) ?? []);
+  if (lever.suggestion !== void 0) sentences.push(suggestionSentence(lever.suggestion, ctx));
+  return { title: say(LEVER_TITLE, lever.id, esc), sentences };
 }
-function truncate(text2, maxChars) {
-  const points = Array.from(text2);
-  if (points.length <= maxChars) return text2;
-  return `${points.slice(0, Math.max(0, maxChars - 1)).join("").trimEnd()}\u2026`;
+function fromTo(e) {
+  return `${short(e.from)} \u2192 ${short(e.to)}`;
 }
-function escapeInline(text2, maxChars = DEFAULT_MAX_NAME) {
-  const plain = plainText(text2, maxChars);
-  let out = "";
-  for (const ch of plain) {
-    out += escapeChar(ch);
-  }
-  return out.replace(/:\/\//g, `:${ZWJ}//`).replace(/\b(www)\./gi, `$1${ZWJ}.`).replace(/\b(GH)-(?=\d)/gi, `$1-${ZWJ}`);
-}
-function escapeChar(ch) {
-  switch (ch) {
-    case "&":
-      return "&amp;";
-    case "<":
-      return "&lt;";
-    case ">":
-      return "&gt;";
-    case "@":
-      return `@${ZWJ}`;
-    case "#":
-      return `\\#${ZWJ}`;
+function evidenceSentence(e, id, ctx) {
+  const { f, esc, review } = ctx;
+  const metric = esc(review.metric.name, 60);
+  switch (e.kind) {
+    case "diagnosis":
+      if (e.component === "mismatch")
+        return `Validation error exceeds train-dev error by ${amount(e.value, f)}: the training data does not look like the validation data; collect or synthesise training data that resembles it.`;
+      if (e.component === "overfit")
+        return `Test error exceeds validation error by ${amount(e.value, f)}: model choices may be tuned to the validation set; enlarge or refresh it.`;
+      return `The candidate has high ${say(COMPONENT_WORD, e.component, esc)}: ${amount(e.value, f)} against a validation error of ${value(e.errorLevel, f)}.`;
+    case "pr-change":
+      return `This PR ${e.direction === "raised" ? "raised" : "lowered"} ${esc(e.hyperparameter, 60)} ${fromTo(e)}.`;
+    case "component-change": {
+      const word = e.delta.call === "up" ? "rose" : e.delta.call === "down" ? "fell" : "held steady";
+      const toward = e.delta.call !== "up" ? "" : e.component === "bias" ? ": the model moved toward underfitting" : ": the model moved toward overfitting";
+      return `${say(COMPONENT_TITLE, e.component, esc)} ${word} (${change(e.delta.estimate, f)}, ${pText(e.delta.p)})${toward}.`;
+    }
+    case "already-pulled":
+      return `This PR already ${e.direction === "raised" ? "raised" : "lowered"} ${esc(e.hyperparameter, 60)} (${fromTo(e)}): judge its effect before pulling further.`;
+    case "sweep-minimum":
+      return sweepSentence(e, ctx);
+    case "learning-curve": {
+      const times = e.fromX > 0 ? ` (${short(e.atX / e.fromX)}\xD7 the largest on the curve)` : "";
+      return `At ${count(e.atX)} training examples${times} the power-law fit (R\xB2 ${fixed(e.r2, 2)}) projects validation ${metric} ${value(e.current, f)} \u2192 ${value(e.projected, f)} (${valueRange(e.ci, f)}).`;
+    }
+    case "gap-trend":
+      return e.trend === "flat" ? "The train/validation gap is flat at the right end of the learning curve: more data will help little." : "The train/validation gap is still closing at the right end of the learning curve.";
+    case "epoch-minimum":
+      return `Validation was best at epoch ${short(e.epoch)} of ${short(e.of)}; stopping there saves ${amount(e.saves, f)}${e.gl === null ? "" : ` (generalization loss ${fixed(e.gl, 1)}%)`}.`;
+    case "still-improving":
+      return `Train and validation ${metric} were both still improving at epoch ${short(e.epoch)}.`;
+    case "epoch-curve-silent":
+      if (!e.curve) return "No epoch curve to confirm it.";
+      return id === "train-longer" ? "The epoch curve does not show both errors still falling at the end." : "The epoch curve does not show training past the validation minimum.";
+    case "reference-missing":
+      return "Bias is unknown without a reference level: add `reference` (human-level error, a prior system, or an estimated Bayes error) to the artifacts or the config.";
+    case "noise-unknown":
+      return "Run-to-run noise is unknown: train with 2 or more seeds (or ship per-example predictions) so changes can be tested.";
     default:
-      return MARKDOWN_PUNCTUATION.has(ch) ? `\\${ch}` : ch;
+      return null;
   }
 }
-var MARKDOWN_PUNCTUATION = /* @__PURE__ */ new Set(["\\", "`", "*", "_", "[", "]", "|", "~", "$"]);
-function mermaidLabel(text2, maxChars = 60) {
-  const kept = plainText(text2, Number.MAX_SAFE_INTEGER).replace(/[^\p{L}\p{N} .,\-+()/=]/gu, " ").replace(/ {2,}/g, " ").trim();
-  return truncate(kept, maxChars);
+function sweepSentence(e, ctx) {
+  const { f, esc } = ctx;
+  const name = e.hyperparameter === null ? "\u03BB" : esc(e.hyperparameter, 60);
+  const at = `${name} \u2248 ${short(e.bestX)}`;
+  const uses = e.current === null ? "" : `; the candidate uses ${short(e.current)}`;
+  const edge = e.atEdge === null ? "" : ` The minimum is at the ${e.atEdge === "low" ? "low" : "high"} end of the sweep: extend it.`;
+  if (e.supports === true)
+    return `The regularization sweep has its lowest validation (${value(e.bestValidation, f)}) at ${at}${uses}.${edge}`;
+  if (e.supports === false && e.side === "at")
+    return `The candidate's strength is already at the sweep's validation minimum (${at}).${edge}`;
+  if (e.supports === false)
+    return `The sweep's validation minimum (${at}) lies on the other side of the candidate's strength.${edge}`;
+  return `The regularization sweep has its lowest validation (${value(e.bestValidation, f)}) at ${at}.${edge}`;
 }
-function displayValue(value) {
-  if (value === void 0) return "(absent)";
-  if (typeof value === "string") return value;
-  if (typeof value === "number" || typeof value === "boolean" || value === null) {
-    return String(value);
-  }
-  try {
-    return JSON.stringify(value) ?? String(value);
-  } catch {
-    return String(value);
-  }
+function suggestionSentence(s, ctx) {
+  const basis = s.basis === "between-old-and-new" ? ", between the old and new values" : s.basis === "sweep-minimum" ? ", the sweep's minimum" : ", one grid step beyond the end of the sweep";
+  return `Try ${ctx.esc(s.hyperparameter, 60)} \u2248 ${short(s.value)}${basis}.`;
 }
-
-// src/report/format.ts
-function numberFormatFor(review) {
-  let largest = 0;
-  for (const change of review.splits) {
-    largest = Math.max(largest, Math.abs(change.baseline), Math.abs(change.candidate));
-  }
-  if (largest === 0 || !Number.isFinite(largest)) return { decimals: 4 };
-  const decimals = 3 - Math.floor(Math.log10(largest));
-  return { decimals: Math.min(6, Math.max(0, decimals)) };
-}
-function num(value, format) {
-  const text2 = value.toFixed(format.decimals);
-  return /^-0(\.0+)?$/.test(text2) ? text2.slice(1) : text2;
-}
-function signed(value, format) {
-  const text2 = num(Math.abs(value), format);
-  if (/^0(\.0+)?$/.test(text2)) return text2;
-  return value > 0 ? `+${text2}` : `\u2212${text2}`;
-}
-function interval(ci, format) {
-  if (ci === null) return "n/a";
-  return `[${signed(ci[0], format)}, ${signed(ci[1], format)}]`;
-}
-function pValue(p) {
-  if (p === null) return "p n/a";
-  if (p < 1e-3) return "p < 0.001";
-  return `p = ${p.toFixed(3)}`;
-}
-function count(n) {
-  return Math.round(n).toString().replace(/\B(?=(\d{3})+(?!\d))/g, ",");
-}
-function short(value) {
-  if (value === 0) return "0";
-  const abs = Math.abs(value);
-  if (abs >= 1e6 || abs < 1e-4) return value.toExponential(2);
-  return String(Number(value.toPrecision(4)));
-}
-function chartNumber(value, decimals) {
-  const text2 = value.toFixed(decimals);
-  return /^-0(\.0+)?$/.test(text2) ? text2.slice(1) : text2;
-}
-
-// src/report/words.ts
-var MOVEMENT_TITLE = {
-  "better-on-both": "less bias and less variance",
-  "away-from-underfitting": "away from underfitting",
-  "toward-overfitting": "toward overfitting",
-  "away-from-overfitting": "away from overfitting",
-  "no-significant-change": "no change beyond noise",
-  "toward-underfitting": "toward underfitting",
-  "worse-on-both": "more bias and more variance"
-};
-var MOVEMENT_SENTENCE = {
-  "better-on-both": "The change lowered both avoidable bias and variance",
-  "away-from-underfitting": "The change moved the model away from underfitting",
-  "toward-overfitting": "The change moved the model toward overfitting",
-  "away-from-overfitting": "The change moved the model away from overfitting",
-  "no-significant-change": "The change did not move avoidable bias or variance beyond run-to-run noise",
-  "toward-underfitting": "The change moved the model toward underfitting",
-  "worse-on-both": "The change raised both avoidable bias and variance"
-};
-var VALIDATION_WORD = {
-  better: "better",
-  worse: "worse",
-  flat: "unchanged within noise"
-};
-var DIAGNOSIS_WORD = {
-  "good-fit": "good fit",
-  "high-bias": "high bias (underfitting)",
-  "high-variance": "high variance (overfitting)",
-  "data-mismatch": "data mismatch",
-  "high-bias-and-variance": "high bias and high variance"
-};
-var COMPONENT_WORD = {
-  bias: "Avoidable bias",
-  variance: "Variance",
-  mismatch: "Data mismatch",
-  overfit: "Validation overfit"
-};
-var COMPONENT_ORDER = [
-  "bias",
-  "variance",
-  "mismatch",
-  "overfit"
-];
-var SPLIT_WORD = {
-  train: "train",
-  train_dev: "train-dev",
-  validation: "validation",
-  test: "test"
-};
-var LEVER_TITLE = {
-  "more-data": "Add training data",
-  "fewer-features": "Use fewer features",
-  "stronger-regularization": "Strengthen regularization",
-  "smaller-model": "Use a smaller model",
-  "early-stopping": "Stop training earlier",
-  "more-features": "Add features",
-  "richer-features": "Add polynomial or interaction terms",
-  "weaker-regularization": "Weaken regularization",
-  "bigger-model": "Use a bigger model",
-  "train-longer": "Train longer",
-  "align-training-data": "Make training data look like validation data",
-  "bigger-validation-set": "Use a bigger validation set",
-  "add-repeats": "Repeat each run with several seeds",
-  "supply-reference": "Supply a reference error level"
-};
-var TEST_WORD = {
-  "welch-t": "Welch's t-test",
-  "z-binomial": "binomial z-test",
-  "mcnemar-exact": "McNemar's exact test",
-  "paired-t": "paired t-test",
-  none: "no test"
-};
-var TEST_WHY = {
-  "welch-t": "Welch's t-test on per-repeat values: each run has two or more repeats (seeds), and their spreads may differ.",
-  "z-binomial": "normal approximation with binomial variances: one repeat of a proportion metric measured on a known number of examples.",
-  "mcnemar-exact": "McNemar's exact test: both runs scored the same examples, so only the examples on which they disagree carry information.",
-  "paired-t": "paired t-test on per-example loss differences: both runs scored the same examples with a continuous loss.",
-  none: "no test: with one repeat of a continuous metric and no paired predictions, run-to-run noise is unknown, so only min-effect decides."
-};
-function reading(call, review) {
-  if (call === "flat") return "flat";
-  const up = call === "up";
-  return up === (review.metric.goal === "maximize") ? "better" : "worse";
-}
-function componentReading(call) {
-  if (call === "up") return "up (worse)";
-  if (call === "down") return "down (better)";
-  return "flat";
-}
-function levelPercent(review) {
-  return String(Number(((1 - review.settings.alpha) * 100).toPrecision(4)));
-}
-var CAUTION = "This verdict is advice for a human reviewer, not a proof: it rests on the numbers the two runs recorded and on the tests named in the method notes.";
 
 // src/report/tables.ts
-function splitsTable(review) {
+function splitsTable(review, esc) {
   const f = numberFormatFor(review);
   return {
     header: [
@@ -46389,23 +46585,24 @@ function splitsTable(review) {
       "Reading"
     ],
     align: ["l", "r", "r", "r", "r", "r", "l"],
+    units: unitLine(f, "values"),
     rows: review.splits.map((s) => [
-      SPLIT_WORD[s.split],
-      num(s.baseline, f),
-      num(s.candidate, f),
-      signed(s.delta.estimate, f),
-      interval(s.delta.ci, f),
-      pValue(s.delta.p).replace(/^p /, "").replace(/^= /, ""),
+      say(SPLIT_WORD, s.split, esc),
+      valueCell(s.baseline, f),
+      valueCell(s.candidate, f),
+      changeCell(s.delta.estimate, f),
+      intervalCell(s.delta.ci, f),
+      pCell(s.delta.p),
       reading(s.delta.call, review)
     ])
   };
 }
-function decompositionTable(review, compact = false) {
+function decompositionTable(review, esc, compact = false) {
   const f = numberFormatFor(review);
   const cell = (run, name) => {
     const c = review[run].components[name];
     if (c.value === null) return "n/a";
-    return `${num(c.value, f)}${c.present ? compact ? "*" : " (present)" : ""}`;
+    return `${valueCell(c.value, f)}${c.present ? compact ? "*" : " (present)" : ""}`;
   };
   const deltas = {
     bias: review.bias.delta,
@@ -46415,71 +46612,46 @@ function decompositionTable(review, compact = false) {
   };
   const rows = COMPONENT_ORDER.map((name) => {
     const d = deltas[name];
+    const row = [say(COMPONENT_TITLE, name, esc), cell("baseline", name), cell("candidate", name)];
+    if (d === null) return [...row, "n/a", "n/a", ...compact ? [] : ["n/a"], "n/a"];
     return [
-      COMPONENT_WORD[name],
-      cell("baseline", name),
-      cell("candidate", name),
-      d === null ? "n/a" : signed(d.estimate, f),
-      d === null ? "n/a" : interval(d.ci, f),
-      d === null ? "n/a" : pValue(d.p).replace(/^p /, "").replace(/^= /, ""),
-      d === null ? "n/a" : componentReading(d.call)
+      ...row,
+      changeCell(d.estimate, f),
+      intervalCell(d.ci, f),
+      ...compact ? [] : [pCell(d.p)],
+      componentReading(d.call, compact)
     ];
   });
+  const units = unitLine(f, "differences");
+  const header = ["Component", "Baseline", "Candidate", "\u0394", `${levelPercent(review)}% interval`];
+  if (compact) {
+    return { header: [...header, "Call"], align: ["l", "r", "r", "r", "r", "l"], rows, units };
+  }
   rows.push([
     "Diagnosis",
-    DIAGNOSIS_WORD[review.baseline.diagnosis],
-    DIAGNOSIS_WORD[review.candidate.diagnosis],
+    say(DIAGNOSIS_WORD, review.baseline.diagnosis, esc),
+    say(DIAGNOSIS_WORD, review.candidate.diagnosis, esc),
     "",
     "",
     "",
     ""
   ]);
-  const table2 = {
-    header: [
-      "Component",
-      "Baseline",
-      "Candidate",
-      "\u0394",
-      `${levelPercent(review)}% interval`,
-      "p",
-      "Call"
-    ],
-    align: ["l", "r", "r", "r", "r", "r", "l"],
-    rows
-  };
-  if (!compact) return table2;
-  const shorter = (row) => [
-    ...row.slice(0, 5),
-    (row[6] ?? "").replace(/^(up|down) \((\w+)\)$/, "$2")
-  ];
   return {
-    header: shorter(table2.header),
-    align: ["l", "r", "r", "r", "r", "l"],
-    rows: table2.rows.map(shorter)
+    header: [...header, "p", "Call"],
+    align: ["l", "r", "r", "r", "r", "r", "l"],
+    rows,
+    units
   };
-}
-function unavailableNotes(review, esc) {
-  const seen = /* @__PURE__ */ new Set();
-  for (const run of ["baseline", "candidate"]) {
-    for (const name of COMPONENT_ORDER) {
-      const c = review[run].components[name];
-      if (c.value === null && c.unavailable !== void 0) {
-        seen.add(`${COMPONENT_WORD[name]}: ${esc(c.unavailable, 300)}`);
-      }
-    }
-  }
-  return [...seen];
 }
 function leversTable(review, esc) {
+  const f = numberFormatFor(review);
   return {
-    header: ["#", "Lever", "Why", "Evidence"],
-    align: ["r", "l", "l", "l"],
-    rows: review.levers.map((lever, i2) => [
-      String(i2 + 1),
-      LEVER_TITLE[lever.id],
-      esc(lever.reason, 300),
-      lever.evidence.map((e) => esc(e, 200)).join(" \xB7 ") || "\u2014"
-    ])
+    header: ["#", "Lever", "Why"],
+    align: ["r", "l", "l"],
+    rows: review.levers.map((lever, i2) => {
+      const text2 = leverText(lever, review, f, esc);
+      return [String(i2 + 1), text2.title, text2.sentences.join(" ") || "\u2014"];
+    })
   };
 }
 function sliceHarm(slice, review) {
@@ -46491,29 +46663,46 @@ function sortSlices(review) {
     (a, b) => rank(a) - rank(b) || sliceHarm(b, review) - sliceHarm(a, review) || (a.name < b.name ? -1 : a.name > b.name ? 1 : 0)
   );
 }
+var SLICE_CHANGE = /* @__PURE__ */ new Map([
+  ["worse", "worse"],
+  ["better", "better"],
+  ["flat", "flat"]
+]);
 function slicesTable(review, esc, limit) {
   const f = numberFormatFor(review);
   const rows = sortSlices(review).slice(0, limit).map((s) => [
     esc(s.name),
     s.examples === null ? "n/a" : count(s.examples),
-    num(s.baseline, f),
-    num(s.candidate, f),
-    signed(s.delta.estimate, f),
-    s.pAdjusted === null ? "n/a" : pValue(s.pAdjusted).replace(/^p /, "").replace(/^= /, ""),
-    s.hiddenRegression ? "worse (hidden)" : s.change
+    valueCell(s.baseline, f),
+    valueCell(s.candidate, f),
+    changeCell(s.delta.estimate, f),
+    pCell(s.pAdjusted),
+    s.hiddenRegression ? "worse (hidden)" : SLICE_CHANGE.get(s.change) ?? esc(s.change, 20)
   ]);
   return {
     header: ["Slice", "Examples", "Baseline", "Candidate", "\u0394", "p (Holm)", "Change"],
     align: ["l", "r", "r", "r", "r", "r", "l"],
-    rows
+    rows,
+    units: unitLine(f, "values")
   };
 }
-function sliceCounts(slices) {
+function sliceCounts(slices2) {
   const out = { worse: 0, better: 0, flat: 0 };
-  for (const s of slices) out[s.change] += 1;
+  for (const s of slices2) {
+    if (s.change === "worse") out.worse += 1;
+    else if (s.change === "better") out.better += 1;
+    else out.flat += 1;
+  }
   return out;
 }
 var MAX_HYPERPARAMETER_ROWS = 50;
+var HYPERPARAMETER_CHANGE = /* @__PURE__ */ new Map([
+  ["raised", "raised"],
+  ["lowered", "lowered"],
+  ["changed", "changed"],
+  ["added", "added"],
+  ["removed", "removed"]
+]);
 function hyperparameterTable(review, esc) {
   return {
     header: ["Hyperparameter", "Baseline", "Candidate", "Change"],
@@ -46522,71 +46711,84 @@ function hyperparameterTable(review, esc) {
       esc(h.key),
       h.kind === "added" ? "(absent)" : esc(displayValue(h.baseline), 60),
       h.kind === "removed" ? "(absent)" : esc(displayValue(h.candidate), 60),
-      h.kind
+      HYPERPARAMETER_CHANGE.get(h.kind) ?? esc(h.kind, 20)
     ])
   };
 }
 
 // src/report/headline.ts
-function changePhrase(name, delta2, review) {
-  const f = numberFormatFor(review);
-  if (delta2 === null) return `${name} unknown`;
-  const level = levelPercent(review);
-  const stats = delta2.ci === null ? `${signed(delta2.estimate, f)}, noise unknown` : `${signed(delta2.estimate, f)}, ${level}% interval ${interval(delta2.ci, f)}, ${pValue(delta2.p)}`;
-  const word = delta2.call === "up" ? "rose" : delta2.call === "down" ? "fell" : "held steady";
+function changePhrase(name, delta, review, f) {
+  if (delta === null) return `${name} unknown`;
+  const stats = delta.ci === null ? `${change(delta.estimate, f)}, noise unknown` : `${change(delta.estimate, f)}, ${levelPercent(review)}% interval ${changeInterval(delta.ci, f)}, ${pText(delta.p)}`;
+  const word = delta.call === "up" ? "rose" : delta.call === "down" ? "fell" : "held steady";
   return `${name} ${word} (${stats})`;
 }
+var GOOD_MOVEMENTS = /* @__PURE__ */ new Set([
+  "better-on-both",
+  "away-from-overfitting",
+  "away-from-underfitting"
+]);
 function buildHeadline(review, esc) {
   const f = numberFormatFor(review);
   const metric = esc(review.metric.name, 60);
   const v = review.validation;
-  const vBase = review.splits.find((s) => s.split === "validation");
-  const movementTone = review.movement === "better-on-both" || review.movement === "away-from-overfitting" || review.movement === "away-from-underfitting" ? "good" : review.movement === "no-significant-change" ? "neutral" : "bad";
+  const vSplit = review.splits.find((s) => s.split === "validation");
+  const movementTone = GOOD_MOVEMENTS.has(review.movement) ? "good" : review.movement === "no-significant-change" ? "neutral" : "bad";
   const vTone = v.change === "better" ? "good" : v.change === "worse" ? "bad" : "neutral";
-  const level = levelPercent(review);
-  const vStats = v.delta.ci === null ? `\u0394 ${signed(v.delta.estimate, f)}; run-to-run noise unknown` : `\u0394 ${signed(v.delta.estimate, f)}, ${level}% interval ${interval(v.delta.ci, f)}, ${pValue(v.delta.p)}, ${TEST_WORD[v.delta.test]}`;
-  const from = vBase === void 0 ? "" : `${num(vBase.baseline, f)} \u2192 ${num(vBase.candidate, f)} `;
+  const vStats = v.delta.ci === null ? `${change(v.delta.estimate, f)}; run-to-run noise unknown` : `${change(v.delta.estimate, f)}, ${levelPercent(review)}% interval ${changeInterval(v.delta.ci, f)}, ${pText(v.delta.p)}, ${say(TEST_WORD, v.delta.test, esc)}`;
+  const from = vSplit === void 0 ? "" : `${value(vSplit.baseline, f)} \u2192 ${value(vSplit.candidate, f)} `;
   const lines = [
     {
-      label: MOVEMENT_SENTENCE[review.movement],
-      text: `${changePhrase(
-        "avoidable bias",
-        review.bias.delta,
-        review
-      )}; ${changePhrase("variance", review.variance.delta, review)}. Diagnosis: baseline ${DIAGNOSIS_WORD[review.baseline.diagnosis]}, candidate ${DIAGNOSIS_WORD[review.candidate.diagnosis]}.`,
+      label: say(MOVEMENT_SENTENCE, review.movement, esc),
+      text: `${changePhrase("avoidable bias", review.bias.delta, review, f)}; ${changePhrase(
+        "variance",
+        review.variance.delta,
+        review,
+        f
+      )}. Diagnosis: baseline ${say(DIAGNOSIS_WORD, review.baseline.diagnosis, esc)}, candidate ${say(
+        DIAGNOSIS_WORD,
+        review.candidate.diagnosis,
+        esc
+      )}.`,
       tone: movementTone
     },
     {
-      label: `Validation ${metric} ${VALIDATION_WORD[v.change]}`,
-      text: `${from}(${vStats}).`,
+      label: `Validation ${metric} ${say(VALIDATION_WORD, v.change, esc)}`,
+      text: `${from}(\u0394 ${vStats}).`,
       tone: vTone
+    },
+    {
+      label: review.gate.pass ? "Gate passed" : "Gate failed",
+      text: gateSentence(review, esc),
+      tone: review.gate.pass ? "good" : "bad"
     }
   ];
-  const gate = review.gate;
-  lines.push({
-    label: gate.pass ? "Gate passed" : "Gate failed",
-    text: gate.pass ? gate.failOn.length === 0 ? "no fail-on policy is set." : `none of fail-on (${gate.failOn.map((p) => esc(p, 60)).join(", ")}) applies.` : `${gate.reasons.map((r) => esc(r, 200)).join("; ")}.`,
-    tone: gate.pass ? "good" : "bad"
-  });
   const first = review.levers[0];
-  lines.push(
-    first === void 0 ? { label: "Next lever", text: "none suggested.", tone: "neutral" } : {
-      label: `Next lever: ${LEVER_TITLE[first.id]}`,
-      text: esc(first.reason, 300),
+  if (first === void 0)
+    lines.push({ label: "Next lever", text: "none suggested.", tone: "neutral" });
+  else {
+    const text2 = leverText(first, review, f, esc);
+    lines.push({
+      label: `Next lever: ${text2.title}`,
+      text: text2.sentences.join(" ") || "\u2014",
       tone: "neutral"
-    }
-  );
+    });
+  }
   const hidden = sortSlices(review).filter((s) => s.hiddenRegression);
   const worst = hidden[0];
   if (worst !== void 0) {
     lines.push({
       label: `${hidden.length} ${hidden.length === 1 ? "slice" : "slices"} got worse while validation improved`,
-      text: `worst: ${esc(worst.name, 60)} (${signed(worst.delta.estimate, f)}).`,
+      text: `worst: ${esc(worst.name, 60)} (${value(worst.baseline, f)} \u2192 ${value(worst.candidate, f)}, ${change(worst.delta.estimate, f)}).`,
       tone: "bad"
     });
   }
-  const title = `${MOVEMENT_TITLE[review.movement]} \xB7 validation ${VALIDATION_WORD[v.change]} \xB7 gate ${gate.pass ? "passed" : "failed"}`;
-  return { title, tone: gate.pass ? movementTone : "bad", lines };
+  const title = `${say(MOVEMENT_TITLE, review.movement, esc)} \xB7 validation ${say(
+    VALIDATION_WORD,
+    v.change,
+    esc
+  )} \xB7 gate ${review.gate.pass ? "passed" : "failed"}`;
+  return { title, tone: review.gate.pass ? movementTone : "bad", lines };
 }
 
 // src/report/marker.ts
@@ -46654,8 +46856,8 @@ function planeChart(review) {
     ...points.map(([run, b, v]) => `  "${run}": [${axis(b)}, ${axis(v)}]`)
   ];
   const metric = escapeInline(review.metric.name, 40);
-  const values = points.map(([run, b, v]) => `${run} bias ${num(b, format)}, variance ${num(v, format)}`).join("; ");
-  const caption = `**Bias/variance plane** (${metric}, shortfall units). Each axis is scaled so that its middle line is the presence threshold, ${num(t, format)} (gap tolerance ${short(review.settings.gapTolerance)} \xD7 the mean validation error level); right of it avoidable bias is large enough to count, above it variance. Values: ${values}.`;
+  const values = points.map(([run, b, v]) => `${run} bias ${difference(b, format)}, variance ${difference(v, format)}`).join("; ");
+  const caption = `**Bias/variance plane** (${metric}, shortfall units). Each axis is scaled so that its middle line is the presence threshold, ${difference(t, format)} (gap tolerance ${short(review.settings.gapTolerance)} \xD7 the mean validation error level); right of it avoidable bias is large enough to count, above it variance. Values: ${values}.`;
   return { kind: "plane", caption, code: lines.join("\n") };
 }
 var CURVE_TEXT = {
@@ -46728,7 +46930,7 @@ function curveCharts(review, curve) {
     return [lineChart(review, curve, series, [range[0], range[1]], yRange, run)];
   });
 }
-function lineChart(review, curve, series, [lo, hi], [yMin, yMax], only) {
+function lineChart(review, curve, series, [lo, hi], yRange, only) {
   const text2 = CURVE_TEXT[curve];
   const ordered = orderSeries(series);
   const xs = [
@@ -46736,13 +46938,16 @@ function lineChart(review, curve, series, [lo, hi], [yMin, yMax], only) {
   ].sort((a, b) => a - b);
   const geometric = curve !== "epochs" && lo > 0 && hi / lo >= 10;
   const grid = geometric ? thin(xs, MAX_POINTS) : evenGrid(lo, hi, Math.min(MAX_POINTS, xs.length));
+  const percent = review.metric.kind === "proportion";
+  const yScale = percent ? 100 : 1;
+  const [yMin, yMax] = [yRange[0] * yScale, yRange[1] * yScale];
   const yPad = (yMax - yMin) * 0.05 || Math.abs(yMax) * 0.05 || 1;
   const y0 = yMin - yPad;
   const y1 = yMax + yPad;
   const yDecimals = Math.min(6, Math.max(0, 2 - Math.floor(Math.log10(y1 - y0))));
   const xDecimals = Number.isInteger(lo) && Number.isInteger(hi) ? 0 : Math.min(6, Math.max(0, 2 - Math.floor(Math.log10(Math.max(hi - lo, 1e-9)))));
   const metric = mermaidLabel(review.metric.name, 40) || "metric";
-  const unit = review.metric.kind === "proportion" ? "proportion" : "metric units";
+  const unit2 = percent ? "%" : "metric units";
   const title = only === null ? text2.title : `${text2.title}, ${only}`;
   const palette = ordered.map((s) => PALETTE[paletteKey(s)][0]).join(", ");
   const lines = [
@@ -46750,9 +46955,9 @@ function lineChart(review, curve, series, [lo, hi], [yMin, yMax], only) {
     "xychart-beta",
     `  title "${title}"`,
     geometric ? `  x-axis "${text2.x}" [${grid.map((x2) => `"${short(x2)}"`).join(", ")}]` : `  x-axis "${text2.x}" ${chartNumber(lo, xDecimals)} --> ${chartNumber(hi, xDecimals)}`,
-    `  y-axis "${metric} (${unit})" ${chartNumber(y0, yDecimals)} --> ${chartNumber(y1, yDecimals)}`,
+    `  y-axis "${metric} (${unit2})" ${chartNumber(y0, yDecimals)} --> ${chartNumber(y1, yDecimals)}`,
     ...ordered.map(
-      (s) => `  line [${grid.map((x2) => chartNumber(interpolate(s.points, x2, geometric), yDecimals + 1)).join(", ")}]`
+      (s) => `  line [${grid.map((x2) => chartNumber(yScale * interpolate(s.points, x2, geometric), yDecimals + 1)).join(", ")}]`
     )
   ];
   const legend = ordered.map((s) => `${PALETTE[paletteKey(s)][1]} = ${s.run} ${s.part}`).join(", ");
@@ -46803,31 +47008,106 @@ function interpolate(points, x2, logX) {
 }
 
 // src/report/notes.ts
+function names(list, total, esc) {
+  return `${list.map((n) => esc(n, 60)).join(", ")}${total > list.length ? ", \u2026" : ""}`;
+}
+function slices(n) {
+  return `${count(n)} ${n === 1 ? "slice" : "slices"}`;
+}
+function noteSentence(note, review, f, esc) {
+  switch (note.code) {
+    case "train-dev-in-one-run":
+      return "Only one run has a train-dev split: the variance change is measured as validation \u2212 train in both.";
+    case "unpaired-slices":
+      return `${slices(note.count)} appear in one run only and were not compared: ${names(note.names, note.count, esc)}.`;
+    case "hidden-regressions":
+      return `Validation improved overall, yet ${slices(note.count)} regressed significantly (Holm-adjusted): ${names(note.names, note.count, esc)}.`;
+    case "noise-unknown":
+      return review.settings.minEffect > 0 ? `Run-to-run noise is unknown (one repeat of a continuous metric, no per-example predictions): changes are called on size alone (min-effect ${amount(review.settings.minEffect, f)}).` : "Run-to-run noise is unknown (one repeat of a continuous metric, no per-example predictions) and min-effect is 0: no change can be called. Add repeats (seeds), per-example predictions, or set min-effect.";
+    case "bias-unknown":
+      return "Avoidable bias is unknown: there is no reference level for this metric. Its change is still measured from the training error; the diagnosis rests on variance and data mismatch.";
+    case "predictions-share-no-id":
+      return "The two predictions files share no id: the paired test was not used.";
+    case "predictions-in-one-run":
+      return "Only one run ships per-example predictions: no paired test.";
+    case "predictions-split-mismatch":
+      return `The predictions are for different splits (${say(SPLIT_WORD, note.baseline, esc)} in the baseline, ${say(SPLIT_WORD, note.candidate, esc)} in the candidate): no paired test.`;
+    case "predictions-unmatched":
+      return `Predictions paired by id: ${count(note.rows)} rows in both; ${count(note.baseline)} baseline and ${count(note.candidate)} candidate rows had no partner and were left out of the paired test.`;
+    case "epoch-log-not-used":
+      return `${esc(note.file, 120)}: the artifact has its own epoch curve; the epoch log ${esc(note.log, 120)} was not used.`;
+    case "epoch-log-missing":
+      return `No epoch log ${esc(note.log, 120)} next to ${esc(note.file, 120)}; the config's epoch-log mapping was not applied to it.`;
+    default:
+      return esc(String(note.code), 60);
+  }
+}
+var NON_LEVER = /* @__PURE__ */ new Map([
+  [
+    "smaller-training-set",
+    "A smaller training set is not a cure for high bias: it only lowers the training error, while validation error stays high or rises."
+  ]
+]);
+var WARNING = /* @__PURE__ */ new Map([
+  [
+    "validation-overfit",
+    "test error is well above validation error: model choices may be tuned to the validation set."
+  ]
+]);
+function reviewNotes(review, f, esc) {
+  return [
+    ...["baseline", "candidate"].flatMap(
+      (run) => review[run].warnings.map((w) => `${run}: ${say(WARNING, w, esc)}`)
+    ),
+    ...review.notes.map((n) => noteSentence(n, review, f, esc)),
+    ...review.nonLevers.map((n) => say(NON_LEVER, n, esc))
+  ];
+}
+var UNAVAILABLE = /* @__PURE__ */ new Map([
+  [
+    "no-reference",
+    "no reference level: give `reference` in the artifact or the config (human-level error, a prior system, or an estimated Bayes error)."
+  ],
+  ["no-train-dev", "needs a train-dev split (held-out data from the training distribution)."],
+  ["no-test", "needs a test split."]
+]);
+function unavailableNotes(review, esc) {
+  const seen = /* @__PURE__ */ new Set();
+  for (const run of ["baseline", "candidate"]) {
+    for (const name of COMPONENT_ORDER) {
+      const c = review[run].components[name];
+      if (c.value === null && c.unavailable !== void 0) {
+        seen.add(`${say(COMPONENT_TITLE, name, esc)}: ${say(UNAVAILABLE, c.unavailable, esc)}`);
+      }
+    }
+  }
+  return [...seen];
+}
+
+// src/report/method.ts
 function methodNotes(review, esc) {
+  const f = numberFormatFor(review);
   const s = review.settings;
   const lines = [
     `alpha = ${short(s.alpha)}: a change counts as up or down only when it is significant at this level and at least min-effect in size; intervals are ${levelPercent(review)}%.`,
-    `min-effect = ${short(s.minEffect)} (${review.metric.kind === "proportion" ? "proportion" : "metric units"}): smaller changes are called flat however significant.`,
+    `min-effect = ${amount(s.minEffect, f)}: smaller changes are called flat however significant.`,
     `gap tolerance = ${short(s.gapTolerance)}: a component is present when it is at least this share of the run's validation error level (and at least min-effect, and significantly above 0 where its noise is known).`,
     `fail-on = ${s.failOn.length === 0 ? "(empty: the gate always passes)" : s.failOn.map((p) => esc(p, 60)).join(", ")}.`
   ];
   const uses = /* @__PURE__ */ new Map();
-  const use = (what, delta2) => {
-    if (delta2 === null) return;
-    uses.set(delta2.test, [...uses.get(delta2.test) ?? [], what]);
+  const use = (what, delta) => {
+    if (delta === null) return;
+    uses.set(delta.test, [...uses.get(delta.test) ?? [], what]);
   };
   use("validation change", review.validation.delta);
   use("avoidable bias", review.bias.delta);
   use("variance", review.variance.delta);
   use("data mismatch", review.mismatch.delta);
   use("validation overfit", review.overfit.delta);
-  for (const split of review.splits) use(`${SPLIT_WORD[split.split]} split`, split.delta);
-  if (review.slices.length > 0) {
-    const tests = [...new Set(review.slices.map((x2) => x2.delta.test))];
-    for (const t of tests) uses.set(t, [...uses.get(t) ?? [], "slices"]);
-  }
+  for (const split of review.splits) use(`${say(SPLIT_WORD, split.split, esc)} split`, split.delta);
+  for (const slice of review.slices) use("slices", slice.delta);
   for (const [test, what] of uses) {
-    lines.push(`${[...new Set(what)].join(", ")}: ${TEST_WHY[test]}`);
+    lines.push(`${[...new Set(what)].join(", ")}: ${say(TEST_WHY, test, esc)}`);
   }
   if (review.slices.length > 0) {
     lines.push(
@@ -46841,36 +47121,29 @@ function methodNotes(review, esc) {
     );
   }
   for (const run of ["baseline", "candidate"]) {
-    const r = review[run];
-    lines.push(referenceLine(run, r, review));
-    for (const w of r.warnings) lines.push(`${run}: ${esc(w, 300)}`);
+    lines.push(referenceLine(run, review[run], f, esc));
   }
-  for (const n of review.notes) lines.push(esc(n, 300));
-  for (const n of review.nonLevers) lines.push(esc(n, 300));
+  lines.push(...reviewNotes(review, f, esc));
   return lines;
 }
-function referenceLine(run, r, review) {
-  const f = numberFormatFor(review);
+function referenceLine(run, r, f, esc) {
   if (r.reference === null) {
     return `${run}: no reference level, so avoidable bias is unknown; set \`reference\` in the artifact or the config.`;
   }
-  const source = {
-    artifact: "from the artifact",
-    config: "from the config",
-    default: "the default for a minimized proportion",
-    unknown: "source unknown"
-  }[r.referenceSource];
-  return `${run}: reference level ${num(r.reference, f)} (${source}).`;
+  return `${run}: reference level ${value(r.reference, f)} (${say(REFERENCE_SOURCE, r.referenceSource, esc)}).`;
 }
-var CURVE_WORD = {
-  epochs: "Epoch curve",
-  training_examples: "Learning curve",
-  regularization: "Regularization curve"
-};
-function skipped(e) {
+function skippedText(e) {
+  return e.skipped === "fit-failed" ? "the power-law fit did not converge" : `needs at least ${count(e.needs)} points, has ${count(e.points)}`;
+}
+var SIDE_WORD = /* @__PURE__ */ new Map([
+  ["below", "below"],
+  ["above", "above"],
+  ["at", "at"]
+]);
+function isSkipped2(e) {
   return "skipped" in e;
 }
-function curveEvidence(review, esc) {
+function curveEvidence(review) {
   const f = numberFormatFor(review);
   const lines = [];
   for (const run of ["baseline", "candidate"]) {
@@ -46878,22 +47151,27 @@ function curveEvidence(review, esc) {
     const e = curves.epochs;
     if (e !== void 0) {
       lines.push(
-        skipped(e) ? `${run}, ${CURVE_WORD.epochs}: not analysed (${esc(e.skipped, 200)}).` : `${run}, ${CURVE_WORD.epochs}: lowest validation ${num(e.bestValidation, f)} at epoch ${short(e.bestX)}; final ${num(e.finalValidation, f)} at epoch ${short(e.finalX)}; ${e.gl === null ? "generalization loss undefined (best validation is 0)" : `generalization loss ${e.gl.toFixed(1)}%`}${e.pq === null ? "" : `, progress quotient ${e.pq.toFixed(2)}`}${e.stoppedLate ? "; trained past the minimum" : ""}${e.stoppedEarly ? "; still improving at the end" : ""}.`
+        isSkipped2(e) ? `${run}, epoch curve: not analysed (${skippedText(e)}).` : `${run}, epoch curve: lowest validation ${value(e.bestValidation, f)} at epoch ${short(e.bestX)}; final ${value(e.finalValidation, f)} at epoch ${short(e.finalX)}; ${e.gl === null ? "generalization loss undefined (best validation is 0)" : `generalization loss ${fixed(e.gl, 1)}%`}${e.pq === null ? "" : `, progress quotient ${fixed(e.pq, 2)}`}${e.stoppedLate ? "; trained past the minimum" : ""}${e.stoppedEarly ? "; still improving at the end" : ""}.`
       );
     }
     const l = curves.training_examples;
     if (l !== void 0) {
-      const lp = skipped(l) ? "" : l.projections.map(
-        (p) => `${short(p.x)} examples \u2192 ${num(p.validation, f)} [${num(p.ci[0], f)}, ${num(p.ci[1], f)}]`
-      ).join("; ");
-      lines.push(
-        skipped(l) ? `${run}, ${CURVE_WORD.training_examples}: not analysed (${esc(l.skipped, 200)}).` : `${run}, ${CURVE_WORD.training_examples}: power-law fit R\xB2 ${l.r2.toFixed(3)}, residual sd ${num(l.residual, f)}; projected validation: ${lp || "none"}; train/validation gap ${l.gapTrend}.`
-      );
+      if (isSkipped2(l)) lines.push(`${run}, learning curve: not analysed (${skippedText(l)}).`);
+      else {
+        const projected = l.projections.map((p) => `${count(p.x)} examples \u2192 ${value(p.validation, f)} (${valueRange(p.ci, f)})`).join("; ");
+        lines.push(
+          `${run}, learning curve: power-law fit R\xB2 ${fixed(l.r2, 3)}, residual sd ${amount(l.residual, f)}; projected validation: ${projected || "none"}; train/validation gap ${l.gapTrend === "closing" ? "closing" : l.gapTrend === "flat" ? "flat" : "unknown"}.`
+        );
+      }
     }
     const g = curves.regularization;
-    if (g !== void 0) {
+    if (g !== void 0 && isSkipped2(g))
+      lines.push(`${run}, regularization curve: not analysed (${skippedText(g)}).`);
+    else if (g !== void 0) {
+      const side = SIDE_WORD.get(g.side) ?? "at an unknown place relative to";
+      const edge = g.atEdge === null ? "" : `; the minimum is at the ${g.atEdge === "low" ? "low" : "high"} end of the sweep, so extend it`;
       lines.push(
-        skipped(g) ? `${run}, ${CURVE_WORD.regularization}: not analysed (${esc(g.skipped, 200)}).` : `${run}, ${CURVE_WORD.regularization}: lowest validation ${num(g.bestValidation, f)} at strength ${short(g.bestX)}; the run's own strength is ${g.side === "at" ? "at" : g.side === "unknown" ? "at an unknown place relative to" : g.side} the best; suggested ${short(g.suggestedX)}${g.atEdge === null ? "" : `; the minimum is at the ${g.atEdge} end of the sweep, so extend it`}.`
+        `${run}, regularization curve: lowest validation ${value(g.bestValidation, f)} at strength ${short(g.bestX)}; the run's own strength is ${side} the best; suggested ${short(g.suggestedX)}${edge}.`
       );
     }
   }
@@ -46971,7 +47249,10 @@ Too large for this space: see the JSON report.
   return stub.length <= target ? stub : stub.slice(0, Math.max(0, target));
 }
 function table(t) {
-  return markdownTable([t.header, ...t.rows], { align: t.align, alignDelimiters: false });
+  const body = markdownTable([t.header, ...t.rows], { align: t.align, alignDelimiters: false });
+  return t.units === void 0 || t.units === null ? body : `${t.units}
+
+${body}`;
 }
 function details(summary2, body) {
   return ["<details>", `<summary>${summary2}</summary>`, "", ...body, "", "</details>", ""];
@@ -46987,8 +47268,8 @@ function headlineBlock(review) {
 }
 function compose(review, { marker, files, charts }, d) {
   const out = [marker, ...headlineBlock(review)];
-  out.push("### Splits", "", table(splitsTable(review)), "");
-  out.push("### Error decomposition", "", table(decompositionTable(review)), "");
+  out.push("### Splits", "", table(splitsTable(review, escapeInline)), "");
+  out.push("### Error decomposition", "", table(decompositionTable(review, escapeInline)), "");
   const missing = unavailableNotes(review, escapeInline);
   if (missing.length > 0) out.push(...missing.map((m) => `- ${m}`), "");
   if (review.levers.length > 0) {
@@ -47021,7 +47302,7 @@ function compose(review, { marker, files, charts }, d) {
     );
   }
   if (d.rest) {
-    const evidence = curveEvidence(review, escapeInline);
+    const evidence = curveEvidence(review);
     if (evidence.length > 0)
       out.push(
         ...details(
@@ -47066,8 +47347,1692 @@ function compose(review, { marker, files, charts }, d) {
   return out.join("\n");
 }
 
+// src/model/settings.ts
+var FAIL_ON_VALUES = [
+  "worse-validation",
+  "toward-overfitting",
+  "toward-underfitting",
+  "worse-on-both",
+  "any-movement",
+  "slice-regression",
+  "high-bias",
+  "high-variance",
+  "data-mismatch",
+  "validation-overfit",
+  "none"
+];
+function isFailOn(value2) {
+  return FAIL_ON_VALUES.includes(value2);
+}
+var DEFAULT_SETTINGS = {
+  alpha: 0.05,
+  minEffect: 0,
+  gapTolerance: 0.1,
+  failOn: ["worse-validation"]
+};
+
 // src/entries/action/bundle.ts
 var import_ajv = __toESM(require_ajv(), 1);
+
+// src/validate/review.ts
+var import__ = __toESM(require__(), 1);
+
+// schema/fitgap-review-1.schema.json
+var fitgap_review_1_schema_default = {
+  $schema: "https://json-schema.org/draft/2020-12/schema",
+  $id: "https://fitgap.dev/schema/fitgap-review-1.schema.json",
+  title: "Review",
+  description: "A fitgap review, format fitgap-review/1: codes, numbers and artifact strings (no sentences; the report writes those).",
+  type: "object",
+  additionalProperties: false,
+  required: [
+    "format",
+    "metric",
+    "settings",
+    "movement",
+    "validation",
+    "bias",
+    "variance",
+    "mismatch",
+    "overfit",
+    "splits",
+    "baseline",
+    "candidate",
+    "slices",
+    "hyperparameters",
+    "levers",
+    "nonLevers",
+    "gate",
+    "notes",
+    "paired"
+  ],
+  properties: {
+    format: {
+      const: "fitgap-review/1"
+    },
+    metric: {
+      type: "object",
+      additionalProperties: false,
+      required: ["name", "goal", "kind"],
+      properties: {
+        name: {
+          type: "string"
+        },
+        goal: {
+          enum: ["minimize", "maximize"]
+        },
+        kind: {
+          enum: ["proportion", "continuous"]
+        },
+        best: {
+          type: "number"
+        },
+        unit: {
+          type: "string"
+        }
+      }
+    },
+    settings: {
+      title: "ReviewSettings",
+      description: "The settings the review was made with.",
+      type: "object",
+      additionalProperties: false,
+      required: ["alpha", "minEffect", "gapTolerance", "failOn"],
+      properties: {
+        alpha: {
+          type: "number",
+          exclusiveMinimum: 0,
+          exclusiveMaximum: 1
+        },
+        minEffect: {
+          type: "number",
+          minimum: 0
+        },
+        gapTolerance: {
+          type: "number",
+          minimum: 0
+        },
+        failOn: {
+          type: "array",
+          items: {
+            $ref: "#/$defs/failOn"
+          }
+        }
+      }
+    },
+    movement: {
+      $ref: "#/$defs/movement"
+    },
+    validation: {
+      type: "object",
+      additionalProperties: false,
+      required: ["change", "delta"],
+      properties: {
+        change: {
+          $ref: "#/$defs/validationChange"
+        },
+        delta: {
+          $ref: "#/$defs/metricDelta"
+        }
+      }
+    },
+    bias: {
+      description: "Change in avoidable bias; null when neither run's training error can be measured.",
+      type: "object",
+      additionalProperties: false,
+      required: ["delta"],
+      properties: {
+        delta: {
+          oneOf: [
+            {
+              $ref: "#/$defs/shortfallDelta"
+            },
+            {
+              type: "null"
+            }
+          ]
+        }
+      }
+    },
+    variance: {
+      type: "object",
+      additionalProperties: false,
+      required: ["delta"],
+      properties: {
+        delta: {
+          $ref: "#/$defs/shortfallDelta"
+        }
+      }
+    },
+    mismatch: {
+      type: "object",
+      additionalProperties: false,
+      required: ["delta"],
+      properties: {
+        delta: {
+          oneOf: [
+            {
+              $ref: "#/$defs/shortfallDelta"
+            },
+            {
+              type: "null"
+            }
+          ]
+        }
+      }
+    },
+    overfit: {
+      type: "object",
+      additionalProperties: false,
+      required: ["delta"],
+      properties: {
+        delta: {
+          oneOf: [
+            {
+              $ref: "#/$defs/shortfallDelta"
+            },
+            {
+              type: "null"
+            }
+          ]
+        }
+      }
+    },
+    splits: {
+      type: "array",
+      items: {
+        $ref: "#/$defs/splitChange"
+      }
+    },
+    baseline: {
+      $ref: "#/$defs/runSummary"
+    },
+    candidate: {
+      $ref: "#/$defs/runSummary"
+    },
+    slices: {
+      type: "array",
+      items: {
+        $ref: "#/$defs/sliceChange"
+      }
+    },
+    hyperparameters: {
+      type: "array",
+      items: {
+        $ref: "#/$defs/hyperparameterChange"
+      }
+    },
+    levers: {
+      type: "array",
+      items: {
+        $ref: "#/$defs/lever"
+      }
+    },
+    nonLevers: {
+      type: "array",
+      items: {
+        enum: ["smaller-training-set"]
+      },
+      description: "`smaller-training-set`: shrinking the training set does not cure high bias."
+    },
+    gate: {
+      title: "Gate",
+      type: "object",
+      additionalProperties: false,
+      required: ["pass", "reasons", "failOn"],
+      properties: {
+        pass: {
+          type: "boolean"
+        },
+        reasons: {
+          type: "array",
+          items: {
+            $ref: "#/$defs/gateReason"
+          }
+        },
+        failOn: {
+          type: "array",
+          items: {
+            $ref: "#/$defs/failOn"
+          }
+        }
+      }
+    },
+    notes: {
+      type: "array",
+      items: {
+        $ref: "#/$defs/note"
+      }
+    },
+    paired: {
+      oneOf: [
+        {
+          $ref: "#/$defs/paired"
+        },
+        {
+          type: "null"
+        }
+      ]
+    }
+  },
+  $defs: {
+    call: {
+      title: "Call",
+      description: "A change called on its estimate: `up`/`down` only when significant at alpha and at least min-effect in size; otherwise `flat`.",
+      enum: ["up", "down", "flat"]
+    },
+    testName: {
+      title: "TestName",
+      description: "The significance test behind a change (DESIGN.md \xA74); `none` when run-to-run noise is unknown.",
+      enum: ["welch-t", "z-binomial", "mcnemar-exact", "paired-t", "none"]
+    },
+    interval: {
+      title: "Interval",
+      description: "A two-sided interval [low, high].",
+      type: "array",
+      items: {
+        type: "number"
+      },
+      minItems: 2,
+      maxItems: 2
+    },
+    metricDelta: {
+      title: "MetricDelta",
+      description: "A change candidate \u2212 baseline in the metric's own units (for a maximized metric, up is better).",
+      type: "object",
+      additionalProperties: false,
+      required: ["unit", "estimate", "ci", "p", "test", "call"],
+      properties: {
+        unit: {
+          const: "metric",
+          description: "The unit of estimate and ci."
+        },
+        estimate: {
+          type: "number",
+          description: "Candidate \u2212 baseline."
+        },
+        ci: {
+          oneOf: [
+            {
+              $ref: "#/$defs/interval"
+            },
+            {
+              type: "null"
+            }
+          ],
+          description: "1 \u2212 alpha interval of the estimate; null when its noise is unknown."
+        },
+        p: {
+          type: ["number", "null"],
+          minimum: 0,
+          maximum: 1,
+          description: "Two-sided p-value; null when its noise is unknown."
+        },
+        test: {
+          $ref: "#/$defs/testName"
+        },
+        call: {
+          $ref: "#/$defs/call"
+        }
+      }
+    },
+    shortfallDelta: {
+      title: "ShortfallDelta",
+      description: "A change candidate \u2212 baseline in shortfall units: the metric's units signed so that up is always worse.",
+      type: "object",
+      additionalProperties: false,
+      required: ["unit", "estimate", "ci", "p", "test", "call"],
+      properties: {
+        unit: {
+          const: "shortfall",
+          description: "The unit of estimate and ci."
+        },
+        estimate: {
+          type: "number",
+          description: "Candidate \u2212 baseline."
+        },
+        ci: {
+          oneOf: [
+            {
+              $ref: "#/$defs/interval"
+            },
+            {
+              type: "null"
+            }
+          ],
+          description: "1 \u2212 alpha interval of the estimate; null when its noise is unknown."
+        },
+        p: {
+          type: ["number", "null"],
+          minimum: 0,
+          maximum: 1,
+          description: "Two-sided p-value; null when its noise is unknown."
+        },
+        test: {
+          $ref: "#/$defs/testName"
+        },
+        call: {
+          $ref: "#/$defs/call"
+        }
+      }
+    },
+    movement: {
+      title: "Movement",
+      description: "How the change moved the model in the bias/variance plane, from the calls on \u0394bias and \u0394variance.",
+      enum: [
+        "better-on-both",
+        "away-from-underfitting",
+        "toward-overfitting",
+        "away-from-overfitting",
+        "no-significant-change",
+        "toward-underfitting",
+        "worse-on-both"
+      ]
+    },
+    validationChange: {
+      title: "ValidationChange",
+      description: "Validation better, worse or flat (within noise or below min-effect).",
+      enum: ["better", "worse", "flat"]
+    },
+    diagnosis: {
+      title: "Diagnosis",
+      description: "The largest present error component of a run (DESIGN.md \xA76).",
+      enum: ["good-fit", "high-bias", "high-variance", "data-mismatch", "high-bias-and-variance"]
+    },
+    componentName: {
+      title: "ComponentName",
+      description: "An error component (DESIGN.md \xA73).",
+      enum: ["bias", "variance", "mismatch", "overfit"]
+    },
+    splitName: {
+      title: "SplitName",
+      description: "A split, named as in the run artifact.",
+      enum: ["train", "train_dev", "validation", "test"]
+    },
+    failOn: {
+      title: "FailOn",
+      description: "An outcome the gate can fail on (`fail-on`).",
+      enum: [
+        "worse-validation",
+        "toward-overfitting",
+        "toward-underfitting",
+        "worse-on-both",
+        "any-movement",
+        "slice-regression",
+        "high-bias",
+        "high-variance",
+        "data-mismatch",
+        "validation-overfit",
+        "none"
+      ]
+    },
+    leverId: {
+      title: "LeverId",
+      description: "A lever: what to try next.",
+      enum: [
+        "more-data",
+        "fewer-features",
+        "stronger-regularization",
+        "smaller-model",
+        "early-stopping",
+        "more-features",
+        "richer-features",
+        "weaker-regularization",
+        "bigger-model",
+        "train-longer",
+        "align-training-data",
+        "bigger-validation-set",
+        "add-repeats",
+        "supply-reference"
+      ]
+    },
+    unavailable: {
+      title: "UnavailableCode",
+      description: "Why a component has no value: no reference level, no train_dev split, or no test split.",
+      enum: ["no-reference", "no-train-dev", "no-test"]
+    },
+    component: {
+      title: "Component",
+      description: "One error component of one run, in shortfall units.",
+      type: "object",
+      additionalProperties: false,
+      required: ["name", "value", "ci", "p", "present"],
+      properties: {
+        name: {
+          $ref: "#/$defs/componentName"
+        },
+        value: {
+          type: ["number", "null"],
+          description: "Mean over repeats; null when it cannot be computed (see unavailable)."
+        },
+        unavailable: {
+          $ref: "#/$defs/unavailable"
+        },
+        ci: {
+          oneOf: [
+            {
+              $ref: "#/$defs/interval"
+            },
+            {
+              type: "null"
+            }
+          ],
+          description: "1 \u2212 alpha interval of the value where its noise is known."
+        },
+        p: {
+          type: ["number", "null"],
+          minimum: 0,
+          maximum: 1,
+          description: "One-sided p-value of value > 0, where its noise is known."
+        },
+        present: {
+          type: "boolean",
+          description: "At least gap-tolerance \xD7 error level, at least min-effect, and significant where testable."
+        }
+      }
+    },
+    splitSummary: {
+      title: "SplitSummary",
+      description: "One split of one run, in metric units.",
+      type: "object",
+      additionalProperties: false,
+      required: ["split", "mean", "sd", "repeats", "examples", "ci"],
+      properties: {
+        split: {
+          $ref: "#/$defs/splitName"
+        },
+        mean: {
+          type: "number",
+          description: "Mean over repeats."
+        },
+        sd: {
+          type: ["number", "null"],
+          description: "Sample standard deviation over repeats (null with one repeat)."
+        },
+        repeats: {
+          type: "integer",
+          minimum: 1
+        },
+        examples: {
+          type: ["integer", "null"],
+          minimum: 1
+        },
+        ci: {
+          oneOf: [
+            {
+              $ref: "#/$defs/interval"
+            },
+            {
+              type: "null"
+            }
+          ],
+          description: "Interval of the mean: t over repeats, or Wilson for one proportion with examples."
+        }
+      }
+    },
+    chartPoint: {
+      title: "ChartPoint",
+      description: "A curve point kept for charts (metric units).",
+      type: "object",
+      additionalProperties: false,
+      required: ["x", "validation"],
+      properties: {
+        x: {
+          type: "number"
+        },
+        train: {
+          type: "number"
+        },
+        validation: {
+          type: "number"
+        }
+      }
+    },
+    curveSkipped: {
+      title: "CurveSkipped",
+      description: "A curve that was not analysed: too few points, or the power-law fit failed.",
+      type: "object",
+      additionalProperties: false,
+      required: ["skipped", "points", "needs"],
+      properties: {
+        skipped: {
+          enum: ["too-few-points", "fit-failed"]
+        },
+        points: {
+          type: "integer",
+          minimum: 0,
+          description: "Points the curve has."
+        },
+        needs: {
+          type: "integer",
+          minimum: 0,
+          description: "Points the analysis needs."
+        }
+      }
+    },
+    epochsEvidence: {
+      title: "EpochsEvidence",
+      description: "Early-stopping evidence from the epoch curve (Prechelt 1998).",
+      type: "object",
+      additionalProperties: false,
+      required: [
+        "bestX",
+        "bestValidation",
+        "finalX",
+        "finalValidation",
+        "gl",
+        "pq",
+        "stoppedLate",
+        "stoppedEarly",
+        "chart"
+      ],
+      properties: {
+        bestX: {
+          type: "number",
+          description: "x of the lowest validation error."
+        },
+        bestValidation: {
+          type: "number"
+        },
+        finalX: {
+          type: "number"
+        },
+        finalValidation: {
+          type: "number"
+        },
+        gl: {
+          type: ["number", "null"],
+          description: "Generalization loss at the last point, in percent; null when the best validation error is exactly 0."
+        },
+        pq: {
+          type: ["number", "null"],
+          description: "Progress quotient GL/P_5 at the last strip end; null without train values."
+        },
+        stoppedLate: {
+          type: "boolean",
+          description: "The run ends past the validation minimum with GL > 5."
+        },
+        stoppedEarly: {
+          type: "boolean",
+          description: "Train and validation both still falling at the end (needs train values)."
+        },
+        stopsAt: {
+          type: "object",
+          additionalProperties: {
+            type: ["number", "null"]
+          },
+          description: "x at which each of Prechelt's criteria would have stopped the run; null when it never fired."
+        },
+        chart: {
+          type: "array",
+          items: {
+            $ref: "#/$defs/chartPoint"
+          },
+          description: "Chart-ready downsampled points (LTTB)."
+        }
+      }
+    },
+    learningCurveProjection: {
+      title: "LearningCurveProjection",
+      type: "object",
+      additionalProperties: false,
+      required: ["x", "validation", "ci"],
+      properties: {
+        x: {
+          type: "number"
+        },
+        validation: {
+          type: "number"
+        },
+        ci: {
+          $ref: "#/$defs/interval"
+        }
+      }
+    },
+    learningCurveEvidence: {
+      title: "LearningCurveEvidence",
+      description: "Power-law fit error(m) = a\xB7m^(\u2212b) + c of validation error against training examples; a, b, c and residual in error units, projections in metric units.",
+      type: "object",
+      additionalProperties: false,
+      required: ["a", "b", "c", "r2", "residual", "projections", "gapTrend", "chart"],
+      properties: {
+        a: {
+          type: "number"
+        },
+        b: {
+          type: "number"
+        },
+        c: {
+          type: "number"
+        },
+        r2: {
+          type: "number"
+        },
+        residual: {
+          type: "number"
+        },
+        projections: {
+          type: "array",
+          items: {
+            $ref: "#/$defs/learningCurveProjection"
+          }
+        },
+        gapTrend: {
+          enum: ["closing", "flat", "unknown"],
+          description: "Train/validation gap at the right end."
+        },
+        gapChangePerDoubling: {
+          type: ["number", "null"]
+        },
+        asymptote: {
+          type: "number",
+          description: "c in metric units: the level more data approaches."
+        },
+        chart: {
+          type: "array",
+          items: {
+            $ref: "#/$defs/chartPoint"
+          },
+          description: "Chart-ready downsampled points (LTTB)."
+        }
+      }
+    },
+    regularizationEvidence: {
+      title: "RegularizationEvidence",
+      description: "Where the regularization sweep has its validation minimum, and where the run's own strength sits.",
+      type: "object",
+      additionalProperties: false,
+      required: ["bestX", "bestValidation", "side", "suggestedX", "atEdge", "chart"],
+      properties: {
+        bestX: {
+          type: "number"
+        },
+        bestValidation: {
+          type: "number"
+        },
+        side: {
+          enum: ["below", "above", "at", "unknown"]
+        },
+        suggestedX: {
+          type: "number"
+        },
+        atEdge: {
+          enum: ["low", "high", null]
+        },
+        refined: {
+          type: "boolean"
+        },
+        chart: {
+          type: "array",
+          items: {
+            $ref: "#/$defs/chartPoint"
+          },
+          description: "Chart-ready downsampled points (LTTB)."
+        }
+      }
+    },
+    curvesReport: {
+      title: "CurvesReport",
+      description: "Curve evidence of one run; each member only where the artifact has that curve.",
+      type: "object",
+      additionalProperties: false,
+      required: [],
+      properties: {
+        epochs: {
+          oneOf: [
+            {
+              $ref: "#/$defs/epochsEvidence"
+            },
+            {
+              $ref: "#/$defs/curveSkipped"
+            }
+          ]
+        },
+        training_examples: {
+          oneOf: [
+            {
+              $ref: "#/$defs/learningCurveEvidence"
+            },
+            {
+              $ref: "#/$defs/curveSkipped"
+            }
+          ]
+        },
+        regularization: {
+          oneOf: [
+            {
+              $ref: "#/$defs/regularizationEvidence"
+            },
+            {
+              $ref: "#/$defs/curveSkipped"
+            }
+          ]
+        }
+      }
+    },
+    runSummary: {
+      title: "RunSummary",
+      description: "One run: its splits, error components, diagnosis and curve evidence.",
+      type: "object",
+      additionalProperties: false,
+      required: [
+        "name",
+        "commit",
+        "createdAt",
+        "reference",
+        "referenceSource",
+        "splits",
+        "errorLevel",
+        "components",
+        "diagnosis",
+        "biasUnknown",
+        "warnings",
+        "curves"
+      ],
+      properties: {
+        name: {
+          type: "string"
+        },
+        commit: {
+          type: ["string", "null"]
+        },
+        createdAt: {
+          type: ["string", "null"]
+        },
+        reference: {
+          type: ["number", "null"],
+          description: "Reference level used; null when unknown."
+        },
+        referenceSource: {
+          enum: ["artifact", "config", "default", "unknown"]
+        },
+        splits: {
+          type: "array",
+          items: {
+            $ref: "#/$defs/splitSummary"
+          }
+        },
+        errorLevel: {
+          type: "number",
+          description: "Validation error level e (DESIGN.md \xA76)."
+        },
+        components: {
+          type: "object",
+          additionalProperties: false,
+          required: ["bias", "variance", "mismatch", "overfit"],
+          properties: {
+            bias: {
+              $ref: "#/$defs/component"
+            },
+            variance: {
+              $ref: "#/$defs/component"
+            },
+            mismatch: {
+              $ref: "#/$defs/component"
+            },
+            overfit: {
+              $ref: "#/$defs/component"
+            }
+          }
+        },
+        diagnosis: {
+          $ref: "#/$defs/diagnosis"
+        },
+        biasUnknown: {
+          type: "boolean",
+          description: "No reference level: the diagnosis rests on variance and mismatch only."
+        },
+        warnings: {
+          type: "array",
+          items: {
+            enum: ["validation-overfit"]
+          },
+          description: "`validation-overfit`: test error well above validation error."
+        },
+        curves: {
+          $ref: "#/$defs/curvesReport"
+        }
+      }
+    },
+    splitChange: {
+      title: "SplitChange",
+      type: "object",
+      additionalProperties: false,
+      required: ["split", "baseline", "candidate", "delta"],
+      properties: {
+        split: {
+          $ref: "#/$defs/splitName"
+        },
+        baseline: {
+          type: "number"
+        },
+        candidate: {
+          type: "number"
+        },
+        delta: {
+          $ref: "#/$defs/metricDelta"
+        }
+      }
+    },
+    sliceChange: {
+      title: "SliceChange",
+      description: "Validation change of one slice, metric units.",
+      type: "object",
+      additionalProperties: false,
+      required: [
+        "name",
+        "examples",
+        "baseline",
+        "candidate",
+        "delta",
+        "pAdjusted",
+        "change",
+        "hiddenRegression"
+      ],
+      properties: {
+        name: {
+          type: "string"
+        },
+        examples: {
+          type: ["integer", "null"],
+          minimum: 1
+        },
+        baseline: {
+          type: "number"
+        },
+        candidate: {
+          type: "number"
+        },
+        delta: {
+          $ref: "#/$defs/metricDelta"
+        },
+        pAdjusted: {
+          type: ["number", "null"],
+          minimum: 0,
+          maximum: 1,
+          description: "Holm\u2013Bonferroni adjusted p over all slices; null when untestable."
+        },
+        change: {
+          $ref: "#/$defs/validationChange"
+        },
+        hiddenRegression: {
+          type: "boolean",
+          description: "Regressed significantly while the aggregate validation improved."
+        }
+      }
+    },
+    hyperparameterChange: {
+      title: "HyperparameterChange",
+      type: "object",
+      additionalProperties: false,
+      required: ["key", "baseline", "candidate", "kind"],
+      properties: {
+        key: {
+          type: "string"
+        },
+        baseline: {
+          tsType: "unknown",
+          description: "Any JSON value (null when added)."
+        },
+        candidate: {
+          tsType: "unknown",
+          description: "Any JSON value (null when removed)."
+        },
+        kind: {
+          enum: ["raised", "lowered", "changed", "added", "removed"]
+        }
+      }
+    },
+    leverDiagnosis: {
+      title: "DiagnosisEvidence",
+      description: "A present error component of the candidate, with its size and the validation error level (both shortfall units).",
+      type: "object",
+      additionalProperties: false,
+      required: ["kind", "component", "value", "errorLevel"],
+      properties: {
+        kind: {
+          const: "diagnosis"
+        },
+        component: {
+          $ref: "#/$defs/componentName"
+        },
+        value: {
+          type: "number"
+        },
+        errorLevel: {
+          type: "number"
+        }
+      }
+    },
+    leverPrChange: {
+      title: "PrChangeEvidence",
+      description: "The PR changed a hyperparameter this lever reverses or counters.",
+      type: "object",
+      additionalProperties: false,
+      required: ["kind", "hyperparameter", "from", "to", "direction"],
+      properties: {
+        kind: {
+          const: "pr-change"
+        },
+        hyperparameter: {
+          type: "string"
+        },
+        from: {
+          type: "number"
+        },
+        to: {
+          type: "number"
+        },
+        direction: {
+          enum: ["raised", "lowered"]
+        }
+      }
+    },
+    leverComponentChange: {
+      title: "ComponentChangeEvidence",
+      description: "How a component changed between the runs.",
+      type: "object",
+      additionalProperties: false,
+      required: ["kind", "component", "delta"],
+      properties: {
+        kind: {
+          const: "component-change"
+        },
+        component: {
+          enum: ["bias", "variance"]
+        },
+        delta: {
+          $ref: "#/$defs/shortfallDelta"
+        }
+      }
+    },
+    leverAlreadyPulled: {
+      title: "AlreadyPulledEvidence",
+      description: "The PR itself already pulled this lever: judge its effect before pulling further.",
+      type: "object",
+      additionalProperties: false,
+      required: ["kind", "hyperparameter", "from", "to", "direction"],
+      properties: {
+        kind: {
+          const: "already-pulled"
+        },
+        hyperparameter: {
+          type: "string"
+        },
+        from: {
+          type: "number"
+        },
+        to: {
+          type: "number"
+        },
+        direction: {
+          enum: ["raised", "lowered"]
+        }
+      }
+    },
+    leverSweepMinimum: {
+      title: "SweepMinimumEvidence",
+      description: "The candidate's regularization sweep: its validation minimum and the strength the candidate uses.",
+      type: "object",
+      additionalProperties: false,
+      required: [
+        "kind",
+        "hyperparameter",
+        "bestX",
+        "bestValidation",
+        "current",
+        "suggestedX",
+        "side",
+        "supports",
+        "atEdge"
+      ],
+      properties: {
+        kind: {
+          const: "sweep-minimum"
+        },
+        hyperparameter: {
+          type: ["string", "null"],
+          description: "The candidate's regularization hyperparameter, when it has one."
+        },
+        bestX: {
+          type: "number"
+        },
+        bestValidation: {
+          type: "number",
+          description: "Lowest validation value of the sweep, metric units."
+        },
+        current: {
+          type: ["number", "null"],
+          description: "The candidate's own strength."
+        },
+        suggestedX: {
+          type: "number"
+        },
+        side: {
+          enum: ["below", "above", "at", "unknown"],
+          description: "Where the candidate's own strength sits relative to the minimum."
+        },
+        supports: {
+          type: ["boolean", "null"],
+          description: "true: the minimum lies on this lever's side; false: it does not (other side, or the candidate is at it); null: not known."
+        },
+        atEdge: {
+          enum: ["low", "high", null]
+        }
+      }
+    },
+    leverLearningCurve: {
+      title: "LearningProjectionEvidence",
+      description: "The power-law projection of validation at more training examples (metric units).",
+      type: "object",
+      additionalProperties: false,
+      required: ["kind", "fromX", "atX", "current", "projected", "ci", "r2"],
+      properties: {
+        kind: {
+          const: "learning-curve"
+        },
+        fromX: {
+          type: "number",
+          description: "Largest training-set size on the curve."
+        },
+        atX: {
+          type: "number"
+        },
+        current: {
+          type: "number",
+          description: "Candidate's validation mean."
+        },
+        projected: {
+          type: "number"
+        },
+        ci: {
+          $ref: "#/$defs/interval"
+        },
+        r2: {
+          type: "number"
+        }
+      }
+    },
+    leverGapTrend: {
+      title: "GapTrendEvidence",
+      description: "The train/validation gap at the right end of the learning curve.",
+      type: "object",
+      additionalProperties: false,
+      required: ["kind", "trend"],
+      properties: {
+        kind: {
+          const: "gap-trend"
+        },
+        trend: {
+          enum: ["closing", "flat"]
+        }
+      }
+    },
+    leverEpochMinimum: {
+      title: "EpochMinimumEvidence",
+      description: "The epoch curve passed its validation minimum.",
+      type: "object",
+      additionalProperties: false,
+      required: ["kind", "epoch", "of", "saves", "gl"],
+      properties: {
+        kind: {
+          const: "epoch-minimum"
+        },
+        epoch: {
+          type: "number"
+        },
+        of: {
+          type: "number"
+        },
+        saves: {
+          type: "number",
+          minimum: 0,
+          description: "Validation error saved by stopping at the minimum, shortfall units."
+        },
+        gl: {
+          type: ["number", "null"],
+          description: "Generalization loss at the end, percent."
+        }
+      }
+    },
+    leverStillImproving: {
+      title: "StillImprovingEvidence",
+      description: "Train and validation were both still improving at the last epoch.",
+      type: "object",
+      additionalProperties: false,
+      required: ["kind", "epoch"],
+      properties: {
+        kind: {
+          const: "still-improving"
+        },
+        epoch: {
+          type: "number"
+        }
+      }
+    },
+    leverEpochCurveSilent: {
+      title: "EpochCurveSilentEvidence",
+      description: "The epoch curve does not confirm this lever (or there is none).",
+      type: "object",
+      additionalProperties: false,
+      required: ["kind", "curve"],
+      properties: {
+        kind: {
+          const: "epoch-curve-silent"
+        },
+        curve: {
+          type: "boolean",
+          description: "Whether the candidate has an epoch curve."
+        }
+      }
+    },
+    leverReferenceMissing: {
+      title: "ReferenceMissingEvidence",
+      description: "No reference level, so avoidable bias is unknown.",
+      type: "object",
+      additionalProperties: false,
+      required: ["kind"],
+      properties: {
+        kind: {
+          const: "reference-missing"
+        }
+      }
+    },
+    leverNoiseUnknown: {
+      title: "NoiseUnknownEvidence",
+      description: "Run-to-run noise is unknown (one repeat of a continuous metric, no paired predictions).",
+      type: "object",
+      additionalProperties: false,
+      required: ["kind"],
+      properties: {
+        kind: {
+          const: "noise-unknown"
+        }
+      }
+    },
+    leverEvidence: {
+      title: "LeverEvidenceItem",
+      description: "One fact behind a lever.",
+      oneOf: [
+        {
+          $ref: "#/$defs/leverDiagnosis"
+        },
+        {
+          $ref: "#/$defs/leverPrChange"
+        },
+        {
+          $ref: "#/$defs/leverComponentChange"
+        },
+        {
+          $ref: "#/$defs/leverAlreadyPulled"
+        },
+        {
+          $ref: "#/$defs/leverSweepMinimum"
+        },
+        {
+          $ref: "#/$defs/leverLearningCurve"
+        },
+        {
+          $ref: "#/$defs/leverGapTrend"
+        },
+        {
+          $ref: "#/$defs/leverEpochMinimum"
+        },
+        {
+          $ref: "#/$defs/leverStillImproving"
+        },
+        {
+          $ref: "#/$defs/leverEpochCurveSilent"
+        },
+        {
+          $ref: "#/$defs/leverReferenceMissing"
+        },
+        {
+          $ref: "#/$defs/leverNoiseUnknown"
+        }
+      ]
+    },
+    suggestion: {
+      title: "Suggestion",
+      description: "A value to try.",
+      type: "object",
+      additionalProperties: false,
+      required: ["hyperparameter", "value", "basis"],
+      properties: {
+        hyperparameter: {
+          type: "string"
+        },
+        value: {
+          type: "number"
+        },
+        basis: {
+          enum: ["between-old-and-new", "sweep-minimum", "beyond-sweep-edge"],
+          description: "Where the value comes from."
+        }
+      }
+    },
+    lever: {
+      title: "Lever",
+      description: "What to try next, ranked by score.",
+      type: "object",
+      additionalProperties: false,
+      required: ["id", "score", "evidence"],
+      properties: {
+        id: {
+          $ref: "#/$defs/leverId"
+        },
+        score: {
+          type: "number",
+          description: "Rank key, higher first (see src/analysis/levers/scores.ts)."
+        },
+        suggestion: {
+          $ref: "#/$defs/suggestion"
+        },
+        evidence: {
+          type: "array",
+          items: {
+            $ref: "#/$defs/leverEvidence"
+          }
+        }
+      }
+    },
+    gateReason: {
+      title: "GateReason",
+      description: "A fail-on outcome that fired.",
+      type: "object",
+      additionalProperties: false,
+      required: ["outcome"],
+      properties: {
+        outcome: {
+          $ref: "#/$defs/failOn"
+        },
+        slices: {
+          type: "integer",
+          minimum: 0,
+          description: "Slices that regressed (slice-regression)."
+        }
+      }
+    },
+    trainDevInOneRunNote: {
+      title: "TrainDevInOneRunNote",
+      description: "Only one run has a train_dev split: the variance change is measured as validation \u2212 train in both.",
+      type: "object",
+      additionalProperties: false,
+      required: ["code"],
+      properties: {
+        code: {
+          const: "train-dev-in-one-run"
+        }
+      }
+    },
+    unpairedSlicesNote: {
+      title: "UnpairedSlicesNote",
+      description: "Slices found in one run only, not compared.",
+      type: "object",
+      additionalProperties: false,
+      required: ["code", "count", "names"],
+      properties: {
+        code: {
+          const: "unpaired-slices"
+        },
+        count: {
+          type: "integer",
+          minimum: 0
+        },
+        names: {
+          type: "array",
+          items: {
+            type: "string"
+          },
+          description: "The first few names (at most 5)."
+        }
+      }
+    },
+    hiddenRegressionsNote: {
+      title: "HiddenRegressionsNote",
+      description: "Validation improved, yet slices regressed significantly (Holm-adjusted).",
+      type: "object",
+      additionalProperties: false,
+      required: ["code", "count", "names"],
+      properties: {
+        code: {
+          const: "hidden-regressions"
+        },
+        count: {
+          type: "integer",
+          minimum: 0
+        },
+        names: {
+          type: "array",
+          items: {
+            type: "string"
+          },
+          description: "The first few names (at most 5)."
+        }
+      }
+    },
+    noiseUnknownNote: {
+      title: "NoiseUnknownNote",
+      description: "Run-to-run noise is unknown: changes are called on size alone (min-effect), or not at all when min-effect is 0.",
+      type: "object",
+      additionalProperties: false,
+      required: ["code"],
+      properties: {
+        code: {
+          const: "noise-unknown"
+        }
+      }
+    },
+    biasUnknownNote: {
+      title: "BiasUnknownNote",
+      description: "No reference level: avoidable bias is unknown; its change is measured from the training error.",
+      type: "object",
+      additionalProperties: false,
+      required: ["code"],
+      properties: {
+        code: {
+          const: "bias-unknown"
+        }
+      }
+    },
+    predictionsShareNoIdNote: {
+      title: "PredictionsShareNoIdNote",
+      description: "The two predictions files share no id: no paired test.",
+      type: "object",
+      additionalProperties: false,
+      required: ["code"],
+      properties: {
+        code: {
+          const: "predictions-share-no-id"
+        }
+      }
+    },
+    predictionsInOneRunNote: {
+      title: "PredictionsInOneRunNote",
+      description: "Only one run ships per-example predictions: no paired test.",
+      type: "object",
+      additionalProperties: false,
+      required: ["code"],
+      properties: {
+        code: {
+          const: "predictions-in-one-run"
+        }
+      }
+    },
+    predictionsSplitMismatchNote: {
+      title: "PredictionsSplitMismatchNote",
+      description: "The predictions are for different splits: no paired test.",
+      type: "object",
+      additionalProperties: false,
+      required: ["code", "baseline", "candidate"],
+      properties: {
+        code: {
+          const: "predictions-split-mismatch"
+        },
+        baseline: {
+          $ref: "#/$defs/splitName"
+        },
+        candidate: {
+          $ref: "#/$defs/splitName"
+        }
+      }
+    },
+    predictionsUnmatchedNote: {
+      title: "PredictionsUnmatchedNote",
+      description: "Prediction rows without a partner, left out of the paired test.",
+      type: "object",
+      additionalProperties: false,
+      required: ["code", "rows", "baseline", "candidate"],
+      properties: {
+        code: {
+          const: "predictions-unmatched"
+        },
+        rows: {
+          type: "integer",
+          minimum: 0
+        },
+        baseline: {
+          type: "integer",
+          minimum: 0
+        },
+        candidate: {
+          type: "integer",
+          minimum: 0
+        }
+      }
+    },
+    epochLogNotUsedNote: {
+      title: "EpochLogNotUsedNote",
+      description: "The artifact has its own epoch curve; the configured epoch log was not used.",
+      type: "object",
+      additionalProperties: false,
+      required: ["code", "file", "log"],
+      properties: {
+        code: {
+          const: "epoch-log-not-used"
+        },
+        file: {
+          type: "string"
+        },
+        log: {
+          type: "string"
+        }
+      }
+    },
+    epochLogMissingNote: {
+      title: "EpochLogMissingNote",
+      description: "No epoch log next to the artifact; the config's epoch-log mapping was not applied.",
+      type: "object",
+      additionalProperties: false,
+      required: ["code", "file", "log"],
+      properties: {
+        code: {
+          const: "epoch-log-missing"
+        },
+        file: {
+          type: "string"
+        },
+        log: {
+          type: "string"
+        }
+      }
+    },
+    note: {
+      title: "Note",
+      description: "Something the reviewer should know about the inputs or the method.",
+      oneOf: [
+        {
+          $ref: "#/$defs/trainDevInOneRunNote"
+        },
+        {
+          $ref: "#/$defs/unpairedSlicesNote"
+        },
+        {
+          $ref: "#/$defs/hiddenRegressionsNote"
+        },
+        {
+          $ref: "#/$defs/noiseUnknownNote"
+        },
+        {
+          $ref: "#/$defs/biasUnknownNote"
+        },
+        {
+          $ref: "#/$defs/predictionsShareNoIdNote"
+        },
+        {
+          $ref: "#/$defs/predictionsInOneRunNote"
+        },
+        {
+          $ref: "#/$defs/predictionsSplitMismatchNote"
+        },
+        {
+          $ref: "#/$defs/predictionsUnmatchedNote"
+        },
+        {
+          $ref: "#/$defs/epochLogNotUsedNote"
+        },
+        {
+          $ref: "#/$defs/epochLogMissingNote"
+        }
+      ]
+    },
+    paired: {
+      title: "PairedSummary",
+      description: "Paired-prediction evidence on the validation change.",
+      type: "object",
+      additionalProperties: false,
+      required: ["rows", "test"],
+      properties: {
+        rows: {
+          type: "integer",
+          minimum: 0
+        },
+        test: {
+          enum: ["mcnemar-exact", "paired-t"]
+        },
+        discordant: {
+          type: "object",
+          additionalProperties: false,
+          required: ["baselineOnly", "candidateOnly"],
+          properties: {
+            baselineOnly: {
+              type: "integer",
+              minimum: 0
+            },
+            candidateOnly: {
+              type: "integer",
+              minimum: 0
+            }
+          }
+        }
+      }
+    }
+  }
+};
+
+// src/validate/ajv-issues.ts
+function valueAt(doc, pointer) {
+  if (pointer === "") return doc;
+  let node = doc;
+  for (const raw of pointer.slice(1).split("/")) {
+    const key = raw.replace(/~1/g, "/").replace(/~0/g, "~");
+    if (node === null || typeof node !== "object") return void 0;
+    node = node[key];
+  }
+  return node;
+}
+function escapePointerToken(token) {
+  return token.replace(/~/g, "~0").replace(/\//g, "~1");
+}
+function typeName(value2) {
+  if (value2 === null) return "null";
+  if (Array.isArray(value2)) return "an array";
+  if (typeof value2 === "object") return "an object";
+  return `${typeof value2} ${quote(value2)}`;
+}
+function oneIssue(error2, file, doc) {
+  const pointer = error2.instancePath;
+  const value2 = valueAt(doc, pointer);
+  const params = error2.params;
+  switch (error2.keyword) {
+    case "required":
+      return {
+        file,
+        pointer: pointer === "" ? "/" : pointer,
+        expected: `must have the key "${String(params["missingProperty"])}"`,
+        hint: "Add it; see schema/fitgap-run-1.schema.json for the format."
+      };
+    case "additionalProperties": {
+      const key = String(params["additionalProperty"]);
+      return {
+        file,
+        pointer: `${pointer}/${escapePointerToken(key)}`,
+        expected: "is not a known key",
+        hint: "Check the spelling; unknown keys are rejected so that a typo cannot pass silently."
+      };
+    }
+    case "type":
+      return {
+        file,
+        pointer,
+        expected: `must be ${String(params["type"]) === "integer" ? "an integer" : `of type ${String(params["type"])}`}`,
+        got: typeName(value2),
+        ...params["type"] === "number" && typeof value2 === "string" ? { hint: "Write numbers without quotes." } : {}
+      };
+    case "enum":
+      return {
+        file,
+        pointer,
+        expected: `must be one of ${params["allowedValues"].map((v) => quote(v)).join(", ")}`,
+        got: quote(value2)
+      };
+    case "const":
+      return {
+        file,
+        pointer,
+        expected: `must be ${quote(params["allowedValue"])}`,
+        got: quote(value2)
+      };
+    case "format":
+      return {
+        file,
+        pointer,
+        expected: `must be a ${String(params["format"])} string`,
+        got: quote(value2),
+        ...params["format"] === "date-time" ? { hint: 'Use RFC 3339, e.g. "2026-11-30T10:00:00Z".' } : {}
+      };
+    default:
+      return {
+        file,
+        pointer,
+        expected: error2.message ?? `fails ${error2.keyword}`,
+        got: quote(value2)
+      };
+  }
+}
+function ajvIssues(errors, file, doc) {
+  const seen = /* @__PURE__ */ new Set();
+  const issues2 = [];
+  for (const error2 of errors) {
+    const issue2 = oneIssue(error2, file, doc);
+    const key = `${issue2.pointer}|${issue2.expected}`;
+    if (seen.has(key)) continue;
+    seen.add(key);
+    issues2.push(issue2);
+  }
+  return issues2;
+}
+function nonFiniteNumbers(doc, pointer = "") {
+  if (typeof doc === "number") return Number.isFinite(doc) ? [] : [pointer];
+  if (Array.isArray(doc))
+    return doc.flatMap((item, i2) => nonFiniteNumbers(item, `${pointer}/${i2}`));
+  if (doc !== null && typeof doc === "object") {
+    return Object.entries(doc).flatMap(
+      ([k, v]) => nonFiniteNumbers(v, `${pointer}/${escapePointerToken(k)}`)
+    );
+  }
+  return [];
+}
+
+// src/validate/review.ts
+var compiled;
+function reviewValidator() {
+  if (compiled === void 0) {
+    const ajv2 = new import__.Ajv2020({ allErrors: true, strict: true, strictNumbers: true });
+    ajv2.addKeyword({ keyword: "tsType", schemaType: "string" });
+    compiled = ajv2.compile(fitgap_review_1_schema_default);
+  }
+  return compiled;
+}
+function isReview(doc) {
+  return reviewValidator()(doc);
+}
+function reviewIssues(doc, file) {
+  const validate = reviewValidator();
+  return validate(doc) ? [] : ajvIssues(validate.errors ?? [], file, doc);
+}
+
+// src/entries/action/bundle.ts
 var REVIEW_FILE = "review.json";
 var PULL_REQUEST_FILE = "pull-request.json";
 var ajv = new import_ajv.Ajv({ allErrors: true });
@@ -47082,88 +49047,7 @@ var pullRequestSchema = {
     headSha: { type: "string", pattern: "^[0-9a-f]{40}$" }
   }
 };
-var enumOf = (values) => ({ type: "string", enum: values });
-var delta = {
-  type: "object",
-  required: ["estimate", "test", "call"],
-  properties: { estimate: { type: "number" }, call: enumOf(["up", "down", "flat"]) }
-};
-var reviewSchema = {
-  type: "object",
-  required: [
-    "format",
-    "movement",
-    "validation",
-    "slices",
-    "settings",
-    "candidate",
-    "baseline",
-    "gate",
-    "metric"
-  ],
-  properties: {
-    format: { const: "fitgap-review/1" },
-    movement: enumOf([
-      "better-on-both",
-      "away-from-underfitting",
-      "toward-overfitting",
-      "away-from-overfitting",
-      "no-significant-change",
-      "toward-underfitting",
-      "worse-on-both"
-    ]),
-    validation: {
-      type: "object",
-      required: ["change", "delta"],
-      properties: { change: enumOf(["better", "worse", "flat"]), delta }
-    },
-    slices: {
-      type: "array",
-      items: {
-        type: "object",
-        required: ["change"],
-        properties: { change: enumOf(["better", "worse", "flat"]) }
-      }
-    },
-    settings: { type: "object" },
-    candidate: {
-      type: "object",
-      required: ["diagnosis", "components"],
-      properties: {
-        components: {
-          type: "object",
-          required: ["overfit"],
-          properties: {
-            overfit: {
-              type: "object",
-              required: ["present"],
-              properties: { present: { type: "boolean" } }
-            }
-          }
-        },
-        diagnosis: enumOf([
-          "good-fit",
-          "high-bias",
-          "high-variance",
-          "data-mismatch",
-          "high-bias-and-variance"
-        ])
-      }
-    },
-    baseline: { type: "object" },
-    metric: { type: "object", required: ["name", "goal", "kind"] },
-    gate: {
-      type: "object",
-      required: ["pass", "reasons"],
-      properties: {
-        pass: { type: "boolean" },
-        reasons: { type: "array", maxItems: 50, items: { type: "string", maxLength: 1e3 } }
-      }
-    }
-  }
-};
 var validatePullRequest = ajv.compile(pullRequestSchema);
-var validateReview = ajv.compile(reviewSchema);
 function parse(bytes, file) {
   try {
     return JSON.parse(new TextDecoder().decode(bytes));
@@ -47189,7 +49073,8 @@ function readPullRequestNote(bytes, label) {
 function readReview(bytes, label) {
   const file = `${label} ${REVIEW_FILE}`;
   const doc = parse(bytes, file);
-  if (!validateReview(doc)) throw new InputError(issues(file, validateReview.errors));
+  const problems = reviewIssues(doc, file);
+  if (problems.length > 0 || !isReview(doc)) throw new InputError(problems);
   return doc;
 }
 
@@ -47387,7 +49272,7 @@ async function gateCheckStep(deps, kind, sha, review, body) {
       pass: review.gate.pass,
       title: `${review.movement}; validation ${review.validation.change}`,
       summary: body,
-      reasons: review.gate.reasons,
+      reasons: gateReasonLines(review, escapeInline),
       detailsUrl: runUrl(context3)
     });
     io.info(
@@ -47411,21 +49296,21 @@ function renderJson(review) {
   return `${JSON.stringify(review, null, 2)}
 `;
 }
-function assertFinite(value, pointer) {
-  if (typeof value === "number") {
-    if (!Number.isFinite(value)) {
+function assertFinite(value2, pointer) {
+  if (typeof value2 === "number") {
+    if (!Number.isFinite(value2)) {
       throw new RangeError(
-        `fitgap-review/1 ${pointer || "/"} is ${String(value)}; the review model must hold finite numbers only (this is a bug)`
+        `fitgap-review/1 ${pointer || "/"} is ${String(value2)}; the review model must hold finite numbers only (this is a bug)`
       );
     }
     return;
   }
-  if (Array.isArray(value)) {
-    value.forEach((item, i2) => assertFinite(item, `${pointer}/${i2}`));
+  if (Array.isArray(value2)) {
+    value2.forEach((item, i2) => assertFinite(item, `${pointer}/${i2}`));
     return;
   }
-  if (value !== null && typeof value === "object") {
-    for (const [key, item] of Object.entries(value)) {
+  if (value2 !== null && typeof value2 === "object") {
+    for (const [key, item] of Object.entries(value2)) {
       assertFinite(item, `${pointer}/${key.replace(/~/g, "~0").replace(/\//g, "~1")}`);
     }
   }
@@ -47464,9 +49349,9 @@ async function runPublish(deps) {
   const label = `artifact "${settings.reportArtifact}" (run ${run.id})`;
   const note = readPullRequestNote(files.note, label);
   const untrusted = readReview(files.review, label);
-  const failOn = settings.failOn ?? untrusted.settings.failOn;
+  const failOn = settings.failOn?.filter(isFailOn) ?? untrusted.settings.failOn;
   const review = { ...untrusted, settings: { ...untrusted.settings, failOn } };
-  review.gate = applyGate(review);
+  review.gate = applyGate(review, failOn);
   const fullName2 = `${context3.repo.owner}/${context3.repo.repo}`;
   if (note.repository !== fullName2 || note.headSha !== run.headSha) {
     refuse2({
@@ -47517,7 +49402,9 @@ async function runPublish(deps) {
     if (problem !== null) problems.push(problem);
   }
   if (!review.gate.pass)
-    io.info(`Gate failed (published on ${run.headSha}): ${review.gate.reasons.join("; ")}`);
+    io.info(
+      `Gate failed (published on ${run.headSha}): ${gateReasonLines(review, plainText).join("; ")}`
+    );
   if (problems.length > 0) io.setFailed(problems.join("\n"));
 }
 async function downloadBundle(deps, run) {
@@ -47578,14 +49465,14 @@ function assertAlpha(alpha) {
 function assertProbability(name, p) {
   if (!(p >= 0 && p <= 1)) throw new RangeError(`${name} must be in [0, 1]; got ${p}`);
 }
-function assertCount(name, value) {
-  if (!Number.isSafeInteger(value) || value < 0) {
-    throw new RangeError(`${name} must be a non-negative integer count; got ${value}`);
+function assertCount(name, value2) {
+  if (!Number.isSafeInteger(value2) || value2 < 0) {
+    throw new RangeError(`${name} must be a non-negative integer count; got ${value2}`);
   }
 }
-function assertFinite2(name, value) {
-  if (!Number.isFinite(value))
-    throw new RangeError(`${name} must be a finite number; got ${value}`);
+function assertFinite2(name, value2) {
+  if (!Number.isFinite(value2))
+    throw new RangeError(`${name} must be a finite number; got ${value2}`);
 }
 function assertFiniteValues(name, values) {
   for (let i2 = 0; i2 < values.length; i2++) {
@@ -47611,9 +49498,9 @@ function assertOpenProbability(p) {
   if (!(p > 0 && p < 1)) throw new RangeError(`p must be in (0, 1) for a quantile; got ${p}`);
 }
 function ibeta(x2, a, b) {
-  const value = import_jstat.default.ibeta(x2, a, b);
-  if (value === false) throw new RangeError(`incomplete beta argument must be in [0, 1]; got ${x2}`);
-  return Math.min(1, Math.max(0, value));
+  const value2 = import_jstat.default.ibeta(x2, a, b);
+  if (value2 === false) throw new RangeError(`incomplete beta argument must be in [0, 1]; got ${x2}`);
+  return Math.min(1, Math.max(0, value2));
 }
 function normalCdf(x2) {
   if (Number.isNaN(x2)) throw new RangeError("normalCdf: x must be a number; got NaN");
@@ -47690,9 +49577,9 @@ var RunningStats = class {
   push(x2) {
     assertFinite2("RunningStats value", x2);
     this.#n += 1;
-    const delta2 = x2 - this.#mean;
-    this.#mean += delta2 / this.#n;
-    this.#m2 += delta2 * (x2 - this.#mean);
+    const delta = x2 - this.#mean;
+    this.#mean += delta / this.#n;
+    this.#m2 += delta * (x2 - this.#mean);
   }
   get n() {
     return this.#n;
@@ -47828,19 +49715,19 @@ function mcnemarExact(b, c, n, alpha) {
 // src/stats/holm.ts
 function holmAdjust(p) {
   const present = [];
-  p.forEach((value, index) => {
-    if (value === null) return;
-    if (!(value >= 0 && value <= 1)) {
-      throw new RangeError(`holmAdjust: p[${index}] must be in [0, 1] or null; got ${value}`);
+  p.forEach((value2, index) => {
+    if (value2 === null) return;
+    if (!(value2 >= 0 && value2 <= 1)) {
+      throw new RangeError(`holmAdjust: p[${index}] must be in [0, 1] or null; got ${value2}`);
     }
-    present.push({ index, value });
+    present.push({ index, value: value2 });
   });
   present.sort((a, b) => a.value - b.value);
   const m = present.length;
   const out = p.map(() => null);
   let running = 0;
-  present.forEach(({ index, value }, rank) => {
-    running = Math.max(running, Math.min(1, (m - rank) * value));
+  present.forEach(({ index, value: value2 }, rank) => {
+    running = Math.max(running, Math.min(1, (m - rank) * value2));
     out[index] = running;
   });
   return out;
@@ -47848,6 +49735,693 @@ function holmAdjust(p) {
 
 // src/stats/noncentral-t.ts
 var import_jstat2 = __toESM(require_jstat(), 1);
+
+// src/analysis/measure.ts
+function shortfallSign(run) {
+  return run.metric.goal === "minimize" ? 1 : -1;
+}
+function splitMeasure(split) {
+  return { terms: [{ split, weight: 1 }], constant: 0 };
+}
+function perRepeat(run, measure) {
+  const sign = shortfallSign(run);
+  const columns = [];
+  for (const term of measure.terms) {
+    const split = run.splits[term.split];
+    if (split === void 0) return null;
+    columns.push({ values: split.values, weight: term.weight });
+  }
+  const repeats = run.splits.train.values.length;
+  const out = [];
+  for (let i2 = 0; i2 < repeats; i2++) {
+    let total = measure.constant;
+    for (const column of columns) total += column.weight * sign * (column.values[i2] ?? Number.NaN);
+    out.push(total);
+  }
+  return out;
+}
+function binomialMeasureVariance(run, measure) {
+  if (run.metric.kind !== "proportion") return null;
+  let total = 0;
+  for (const term of measure.terms) {
+    const split = run.splits[term.split];
+    if (split?.examples === void 0) return null;
+    const repeats = split.values.length;
+    total += term.weight * term.weight * binomialVariance(mean(split.values), split.examples * repeats);
+  }
+  return total;
+}
+
+// src/analysis/noise.ts
+function callOf(result, settings) {
+  const big = Math.abs(result.estimate) >= settings.minEffect && result.estimate !== 0;
+  const significant = result.p === null ? settings.minEffect > 0 : result.p < settings.alpha;
+  if (!big || !significant) return "flat";
+  return result.estimate > 0 ? "up" : "down";
+}
+function toShortfallDelta(result, settings) {
+  return { unit: "shortfall", ...deltaFields(result, settings) };
+}
+function toMetricDelta(result, settings) {
+  return { unit: "metric", ...deltaFields(result, settings) };
+}
+function deltaFields(result, settings) {
+  return {
+    estimate: result.estimate,
+    ci: result.ci,
+    p: result.p,
+    test: result.test,
+    call: callOf(result, settings)
+  };
+}
+function measureChange(baseline, candidate, measure, alpha) {
+  const b = perRepeat(baseline, measure.baseline);
+  const c = perRepeat(candidate, measure.candidate);
+  if (b === null || c === null) return null;
+  const estimate = mean(c) - mean(b);
+  if (b.length >= 2 && c.length >= 2) return welchT(b, c, alpha);
+  const vb = binomialMeasureVariance(baseline, measure.baseline);
+  const vc = binomialMeasureVariance(candidate, measure.candidate);
+  if (vb !== null && vc !== null) return normalTest(estimate, vb + vc, alpha, "z-binomial");
+  return { estimate, ci: null, p: null, test: "none" };
+}
+function measureLevel(run, measure, alpha) {
+  const values = perRepeat(run, measure);
+  if (values === null) return null;
+  const value2 = mean(values);
+  if (values.length >= 2) {
+    const t = oneSampleT(values, alpha);
+    return { value: value2, ci: t.ci, p: t.pGreater };
+  }
+  const variance = binomialMeasureVariance(run, measure);
+  if (variance !== null) {
+    const z = normalTest(value2, variance, alpha, "z-binomial");
+    const p = variance > 0 ? 1 - normalCdf(value2 / Math.sqrt(variance)) : value2 > 0 ? 0 : 1;
+    return { value: value2, ci: z.ci, p };
+  }
+  return { value: value2, ci: null, p: null };
+}
+function toMetricUnits(result, sign) {
+  if (sign === 1) return result;
+  return {
+    ...result,
+    estimate: -result.estimate,
+    ci: result.ci === null ? null : [-result.ci[1], -result.ci[0]],
+    ...result.statistic === void 0 ? {} : { statistic: -result.statistic }
+  };
+}
+
+// src/analysis/decompose.ts
+function chooseReference(run, override) {
+  if (override !== void 0) return { value: override, source: "config" };
+  if (run.reference !== void 0) return { value: run.reference, source: "artifact" };
+  if (run.metric.kind === "proportion" && run.metric.goal === "minimize")
+    return { value: 0, source: "default" };
+  return { value: null, source: "unknown" };
+}
+function componentMeasures(run, reference) {
+  const sign = shortfallSign(run);
+  const hasDev = run.splits.train_dev !== void 0;
+  return {
+    bias: reference === null ? null : { terms: [{ split: "train", weight: 1 }], constant: -sign * reference },
+    variance: {
+      terms: [
+        { split: hasDev ? "train_dev" : "validation", weight: 1 },
+        { split: "train", weight: -1 }
+      ],
+      constant: 0
+    },
+    mismatch: hasDev ? {
+      terms: [
+        { split: "validation", weight: 1 },
+        { split: "train_dev", weight: -1 }
+      ],
+      constant: 0
+    } : null,
+    overfit: run.splits.test !== void 0 ? {
+      terms: [
+        { split: "test", weight: 1 },
+        { split: "validation", weight: -1 }
+      ],
+      constant: 0
+    } : null
+  };
+}
+function errorLevel(run) {
+  const m = mean(run.splits.validation.values);
+  return Math.abs(run.metric.goal === "minimize" ? m : 1 - m);
+}
+var UNAVAILABLE2 = /* @__PURE__ */ new Map([
+  ["bias", "no-reference"],
+  ["mismatch", "no-train-dev"],
+  ["overfit", "no-test"]
+]);
+function decompose(run, reference, settings) {
+  const measures = componentMeasures(run, reference);
+  const threshold = Math.max(settings.gapTolerance * errorLevel(run), settings.minEffect);
+  const out = {};
+  for (const name of ["bias", "variance", "mismatch", "overfit"]) {
+    const measure = measures[name];
+    const level = measure === null ? null : measureLevel(run, measure, settings.alpha);
+    if (level === null) {
+      const unavailable = UNAVAILABLE2.get(name);
+      if (unavailable === void 0) throw new Error(`${name} needs splits every run has`);
+      out[name] = { name, value: null, unavailable, ci: null, p: null, present: false };
+      continue;
+    }
+    const significant = level.p === null || level.p < settings.alpha;
+    const present = level.value > 0 && level.value >= threshold && significant;
+    out[name] = { name, value: level.value, ci: level.ci, p: level.p, present };
+  }
+  return out;
+}
+function diagnose(components) {
+  const candidates = ["bias", "variance", "mismatch"].map((name) => components[name]).filter((c) => c.present && c.value !== null).sort((a, b) => (b.value ?? 0) - (a.value ?? 0));
+  const top = candidates[0];
+  if (top === void 0) return "good-fit";
+  const bias = components.bias;
+  const variance = components.variance;
+  if (bias.present && variance.present && bias.value !== null && variance.value !== null) {
+    const ratio = Math.max(bias.value, variance.value) / Math.min(bias.value, variance.value);
+    if (ratio <= 2 && (top.name === "bias" || top.name === "variance"))
+      return "high-bias-and-variance";
+  }
+  if (top.name === "bias") return "high-bias";
+  if (top.name === "variance") return "high-variance";
+  return "data-mismatch";
+}
+
+// src/analysis/changes.ts
+function both(measure) {
+  return { baseline: measure, candidate: measure };
+}
+function pairedTest(paired, run, alpha) {
+  if (paired.rows === 0) return null;
+  if (paired.kind === "proportion") {
+    const result = mcnemarExact(
+      paired.baselineOnly ?? 0,
+      paired.candidateOnly ?? 0,
+      paired.rows,
+      alpha
+    );
+    return run.metric.goal === "minimize" ? toMetricUnits(result, -1) : result;
+  }
+  return pairedT(
+    { n: paired.rows, mean: paired.meanDiff ?? 0, variance: paired.varDiff ?? 0 },
+    alpha
+  );
+}
+function splitShortfalls(runs, alpha, paired) {
+  const pairedSplit = paired?.split ?? "validation";
+  const sign = shortfallSign(runs.candidate);
+  const out = /* @__PURE__ */ new Map();
+  for (const split of SPLIT_NAMES) {
+    let result = measureChange(runs.baseline, runs.candidate, both(splitMeasure(split)), alpha);
+    if (result === null) continue;
+    if (paired !== void 0 && split === pairedSplit && (result.test === "none" || result.test === "z-binomial")) {
+      const test = pairedTest(paired, runs.candidate, alpha);
+      if (test !== null) result = toMetricUnits(test, sign);
+    }
+    out.set(split, result);
+  }
+  return out;
+}
+function splitChanges(shortfalls, runs, summaries, calls) {
+  const sign = shortfallSign(runs.candidate);
+  const out = [];
+  for (const [split, result] of shortfalls) {
+    const b = summaries.baseline.splits.find((s) => s.split === split);
+    const c = summaries.candidate.splits.find((s) => s.split === split);
+    if (b === void 0 || c === void 0) continue;
+    out.push({
+      split,
+      baseline: b.mean,
+      candidate: c.mean,
+      delta: toMetricDelta(toMetricUnits(result, sign), calls)
+    });
+  }
+  return out;
+}
+function componentChanges(runs, references, calls) {
+  const { baseline, candidate } = runs;
+  const alpha = calls.alpha;
+  const refB = references.baseline;
+  const refC = references.candidate;
+  const [biasRefB, biasRefC] = refB !== null && refC !== null ? [refB, refC] : [0, 0];
+  const bias = measureChange(
+    baseline,
+    candidate,
+    {
+      baseline: componentMeasures(baseline, biasRefB).bias ?? splitMeasure("train"),
+      candidate: componentMeasures(candidate, biasRefC).bias ?? splitMeasure("train")
+    },
+    alpha
+  );
+  const change2 = (name) => {
+    const mb = componentMeasures(baseline, refB)[name];
+    const mc = componentMeasures(candidate, refC)[name];
+    if (mb === null || mc === null) return null;
+    const r = measureChange(baseline, candidate, { baseline: mb, candidate: mc }, alpha);
+    return r === null ? null : toShortfallDelta(r, calls);
+  };
+  const varianceFallback = baseline.splits.train_dev === void 0 !== (candidate.splits.train_dev === void 0);
+  const variance = varianceFallback ? validationMinusTrain(runs, calls) : change2("variance");
+  if (variance === null)
+    throw new Error("variance needs train and validation, which the schema requires");
+  return {
+    bias: bias === null ? null : toShortfallDelta(bias, calls),
+    variance,
+    mismatch: change2("mismatch"),
+    overfit: change2("overfit"),
+    varianceFallback
+  };
+}
+function validationMinusTrain(runs, calls) {
+  const measure = {
+    terms: [
+      { split: "validation", weight: 1 },
+      { split: "train", weight: -1 }
+    ],
+    constant: 0
+  };
+  const r = measureChange(runs.baseline, runs.candidate, both(measure), calls.alpha);
+  return r === null ? null : toShortfallDelta(r, calls);
+}
+
+// src/analysis/hyperparameters.ts
+function diffHyperparameters(baseline = {}, candidate = {}) {
+  const keys = [.../* @__PURE__ */ new Set([...Object.keys(baseline), ...Object.keys(candidate)])].sort();
+  const out = [];
+  for (const key of keys) {
+    const inB = Object.hasOwn(baseline, key);
+    const inC = Object.hasOwn(candidate, key);
+    const b = baseline[key];
+    const c = candidate[key];
+    if (!inB) out.push({ key, baseline: null, candidate: c, kind: "added" });
+    else if (!inC) out.push({ key, baseline: b, candidate: null, kind: "removed" });
+    else if (typeof b === "number" && typeof c === "number") {
+      if (c > b) out.push({ key, baseline: b, candidate: c, kind: "raised" });
+      else if (c < b) out.push({ key, baseline: b, candidate: c, kind: "lowered" });
+    } else if (JSON.stringify(b) !== JSON.stringify(c))
+      out.push({ key, baseline: b, candidate: c, kind: "changed" });
+  }
+  return out;
+}
+var KNOBS = [
+  [
+    /^(lambda|l2|l2_penalty|weight_decay|reg(ularization)?(_strength)?|ridge_alpha|dropout)$/i,
+    "regularization"
+  ],
+  [/^(features|num_features|n_features|feature_count)$/i, "features"],
+  [/^(polynomial_degree|poly_degree|degree|interaction_terms)$/i, "feature-richness"],
+  [/^(train_examples|training_examples|n_train|train_size|num_train)$/i, "data"],
+  [/^(epochs|max_epochs|num_epochs|iterations|max_iter|steps)$/i, "epochs"],
+  [
+    /^(hidden_units|hidden_size|layers|num_layers|depth|max_depth|width|params|parameters|model_size|n_estimators)$/i,
+    "model-size"
+  ]
+];
+function knobOf(key) {
+  for (const [pattern, knob] of KNOBS) if (pattern.test(key)) return knob;
+  return null;
+}
+var PULLED = {
+  regularization: { raised: "stronger-regularization", lowered: "weaker-regularization" },
+  features: { raised: "more-features", lowered: "fewer-features" },
+  "feature-richness": { raised: "richer-features", lowered: "fewer-features" },
+  data: { raised: "more-data", lowered: "more-data" },
+  epochs: { raised: "train-longer", lowered: "early-stopping" },
+  "model-size": { raised: "bigger-model", lowered: "smaller-model" }
+};
+function pulledLevers(changes) {
+  const out = [];
+  for (const change2 of changes) {
+    if (change2.kind !== "raised" && change2.kind !== "lowered") continue;
+    const knob = knobOf(change2.key);
+    if (knob === null) continue;
+    if (knob === "data" && change2.kind === "lowered") continue;
+    out.push({ lever: PULLED[knob][change2.kind], change: change2, knob });
+  }
+  return out;
+}
+
+// src/analysis/levers/context.ts
+function curveEvidence2(curves) {
+  const analysed = (c) => c === void 0 || "skipped" in c ? null : c;
+  return {
+    learning: analysed(curves.training_examples),
+    sweep: analysed(curves.regularization),
+    epochs: analysed(curves.epochs)
+  };
+}
+var Drafts = class {
+  #byId = /* @__PURE__ */ new Map();
+  add(id, score, evidence, suggestion) {
+    const existing = this.#byId.get(id);
+    if (existing !== void 0 && existing.score >= score) return;
+    this.#byId.set(id, {
+      id,
+      score,
+      ...suggestion === void 0 ? {} : { suggestion },
+      evidence
+    });
+  }
+  has(id) {
+    return this.#byId.has(id);
+  }
+  /** Highest score first; drafts with equal scores keep the order they were first drafted in. */
+  ranked() {
+    return [...this.#byId.values()].sort((a, b) => b.score - a.score);
+  }
+};
+function between(from, to) {
+  return from > 0 && to > 0 ? Math.sqrt(from * to) : (from + to) / 2;
+}
+function savedByStopping(e, goal) {
+  const sign = goal === "minimize" ? 1 : -1;
+  return Math.max(0, sign * (e.finalValidation - e.bestValidation));
+}
+function epochMinimum(e, goal) {
+  return {
+    kind: "epoch-minimum",
+    epoch: e.bestX,
+    of: e.finalX,
+    saves: savedByStopping(e, goal),
+    gl: e.gl
+  };
+}
+
+// src/analysis/levers/catalogue.ts
+var BY_TARGET = {
+  variance: [
+    "more-data",
+    "stronger-regularization",
+    "fewer-features",
+    "early-stopping",
+    "smaller-model"
+  ],
+  bias: [
+    "richer-features",
+    "more-features",
+    "weaker-regularization",
+    "bigger-model",
+    "train-longer"
+  ]
+};
+
+// src/analysis/levers/scores.ts
+var REVERSE_OWN_CHANGE = 100;
+var COUNTER_WITH_SWEEP = 95;
+var STEP_BACK_CAPACITY = 90;
+var COUNTER_WITHOUT_SWEEP = 85;
+var DIAGNOSIS_BASE = 60;
+var SECOND_TARGET_STEP = 20;
+var CATALOGUE_STEP = 2;
+var GAP_CLOSING_BONUS = 8;
+var GAP_FLAT_PENALTY = 25;
+var SWEEP_AGREES_BONUS = 10;
+var SWEEP_DISAGREES_PENALTY = 20;
+var EPOCH_CONFIRMED_BONUS = 12;
+var EPOCH_UNCONFIRMED_PENALTY = 15;
+var NOTHING_TO_WEAKEN_PENALTY = 10;
+var ALREADY_PULLED_PENALTY = 30;
+var EPOCH_CURVE_ALONE = 35;
+var MISMATCH_DIAGNOSED = 70;
+var MISMATCH_PRESENT = 30;
+var VALIDATION_OVERFIT = 40;
+var SUPPLY_REFERENCE = 20;
+var ADD_REPEATS = 15;
+
+// src/analysis/levers/own-change.ts
+var CAPACITY_LEVERS = /* @__PURE__ */ new Set([
+  "richer-features",
+  "more-features",
+  "bigger-model"
+]);
+function numericChange(p) {
+  return {
+    hyperparameter: p.change.key,
+    from: Number(p.change.baseline),
+    to: Number(p.change.candidate),
+    direction: p.change.kind === "lowered" ? "lowered" : "raised"
+  };
+}
+function ownChangeLevers(ctx, curves, drafts) {
+  const towardBias = ctx.movement === "toward-underfitting" || ctx.movement === "worse-on-both";
+  const towardVariance = ctx.movement === "toward-overfitting" || ctx.movement === "worse-on-both";
+  const biasChange = {
+    kind: "component-change",
+    component: "bias",
+    delta: ctx.bias
+  };
+  const varianceChange = {
+    kind: "component-change",
+    component: "variance",
+    delta: ctx.variance
+  };
+  for (const p of ctx.pulled) {
+    const { baseline: from, candidate: to, key } = p.change;
+    if (typeof from !== "number" || typeof to !== "number") continue;
+    const change2 = { kind: "pr-change", ...numericChange(p) };
+    const midway = {
+      hyperparameter: key,
+      value: between(from, to),
+      basis: "between-old-and-new"
+    };
+    if (p.lever === "stronger-regularization" && towardBias) {
+      drafts.add("weaker-regularization", REVERSE_OWN_CHANGE, [change2, biasChange], midway);
+    }
+    if (p.lever === "weaker-regularization" && towardVariance) {
+      drafts.add("stronger-regularization", REVERSE_OWN_CHANGE, [change2, varianceChange], midway);
+    }
+    if (CAPACITY_LEVERS.has(p.lever) && towardVariance) {
+      const back = p.lever === "bigger-model" ? "smaller-model" : "fewer-features";
+      drafts.add(back, STEP_BACK_CAPACITY, [change2, varianceChange], midway);
+      counterCapacity(ctx, curves, drafts, [change2, varianceChange]);
+    }
+  }
+}
+function counterCapacity(ctx, curves, drafts, evidence) {
+  const sweep = curves.sweep;
+  if (sweep === null || sweep.side !== "below") {
+    drafts.add("stronger-regularization", COUNTER_WITHOUT_SWEEP, evidence);
+    return;
+  }
+  const key = ctx.regularization?.key;
+  drafts.add(
+    "stronger-regularization",
+    COUNTER_WITH_SWEEP,
+    [
+      ...evidence,
+      {
+        kind: "sweep-minimum",
+        hyperparameter: key ?? null,
+        bestX: sweep.bestX,
+        bestValidation: sweep.bestValidation,
+        current: ctx.regularization?.value ?? null,
+        suggestedX: sweep.suggestedX,
+        side: sweep.side,
+        supports: true,
+        atEdge: sweep.atEdge
+      }
+    ],
+    key === void 0 ? void 0 : sweepSuggestion(key, sweep)
+  );
+}
+function sweepSuggestion(key, sweep) {
+  return {
+    hyperparameter: key,
+    value: sweep.suggestedX,
+    basis: sweep.atEdge === null ? "sweep-minimum" : "beyond-sweep-edge"
+  };
+}
+
+// src/analysis/levers/diagnosis.ts
+function targets(diagnosis, run) {
+  const b = run.components.bias.value ?? 0;
+  const v = run.components.variance.value ?? 0;
+  switch (diagnosis) {
+    case "high-variance":
+      return ["variance"];
+    case "high-bias":
+      return ["bias"];
+    case "high-bias-and-variance":
+      return b >= v ? ["bias", "variance"] : ["variance", "bias"];
+    default:
+      return [];
+  }
+}
+function diagnosisLevers(ctx, curves, drafts) {
+  const pulled = new Map(ctx.pulled.map((p) => [p.lever, p]));
+  targets(ctx.candidate.diagnosis, ctx.candidate).forEach((target, t) => {
+    const component = ctx.candidate.components[target];
+    const base = component.value === null ? [] : [
+      {
+        kind: "diagnosis",
+        component: target,
+        value: component.value,
+        errorLevel: ctx.candidate.errorLevel
+      }
+    ];
+    BY_TARGET[target].forEach((id, i2) => {
+      const draft = {
+        score: DIAGNOSIS_BASE - t * SECOND_TARGET_STEP - i2 * CATALOGUE_STEP,
+        evidence: [...base]
+      };
+      sharpen(id, draft, ctx, curves);
+      const p = pulled.get(id);
+      if (p !== void 0) {
+        draft.score -= ALREADY_PULLED_PENALTY;
+        draft.evidence.push({ kind: "already-pulled", ...numericChange(p) });
+      }
+      drafts.add(id, draft.score, draft.evidence, draft.suggestion);
+    });
+  });
+}
+function sharpen(id, draft, ctx, curves) {
+  if (id === "more-data" && curves.learning !== null) {
+    const lc = curves.learning;
+    const twice = lc.projections[0];
+    if (twice !== void 0) {
+      draft.evidence.push({
+        kind: "learning-curve",
+        fromX: Math.max(...lc.chart.map((p) => p.x)),
+        atX: twice.x,
+        current: ctx.candidate.splits.find((s) => s.split === "validation")?.mean ?? 0,
+        projected: twice.validation,
+        ci: twice.ci,
+        r2: lc.r2
+      });
+    }
+    if (lc.gapTrend === "flat") {
+      draft.score -= GAP_FLAT_PENALTY;
+      draft.evidence.push({ kind: "gap-trend", trend: "flat" });
+    } else if (lc.gapTrend === "closing") {
+      draft.score += GAP_CLOSING_BONUS;
+      draft.evidence.push({ kind: "gap-trend", trend: "closing" });
+    }
+  }
+  if ((id === "stronger-regularization" || id === "weaker-regularization") && curves.sweep !== null) {
+    sharpenBySweep(id, draft, ctx, curves.sweep);
+  }
+  const epochs = curves.epochs;
+  if (id === "early-stopping") {
+    if (epochs !== null && epochs.stoppedLate) {
+      draft.score += EPOCH_CONFIRMED_BONUS;
+      draft.evidence.push(epochMinimum(epochs, ctx.goal));
+    } else {
+      draft.score -= EPOCH_UNCONFIRMED_PENALTY;
+      draft.evidence.push({ kind: "epoch-curve-silent", curve: epochs !== null });
+    }
+  }
+  if (id === "train-longer") {
+    if (epochs !== null && epochs.stoppedEarly) {
+      draft.score += EPOCH_CONFIRMED_BONUS;
+      draft.evidence.push({ kind: "still-improving", epoch: epochs.finalX });
+    } else {
+      draft.score -= EPOCH_UNCONFIRMED_PENALTY;
+      draft.evidence.push({ kind: "epoch-curve-silent", curve: epochs !== null });
+    }
+  }
+  if (id === "weaker-regularization" && ctx.regularization === void 0 && curves.sweep === null) {
+    draft.score -= NOTHING_TO_WEAKEN_PENALTY;
+  }
+}
+function sharpenBySweep(id, draft, ctx, sweep) {
+  const wants = id === "stronger-regularization" ? "below" : "above";
+  const supports = sweep.side === "unknown" ? null : sweep.side === wants;
+  if (supports === null && sweep.atEdge === null) return;
+  const key = ctx.regularization?.key;
+  draft.evidence.push({
+    kind: "sweep-minimum",
+    hyperparameter: key ?? null,
+    bestX: sweep.bestX,
+    bestValidation: sweep.bestValidation,
+    current: ctx.regularization?.value ?? null,
+    suggestedX: sweep.suggestedX,
+    side: sweep.side,
+    supports,
+    atEdge: sweep.atEdge
+  });
+  if (supports === true) {
+    draft.score += SWEEP_AGREES_BONUS;
+    if (key !== void 0) draft.suggestion = sweepSuggestion(key, sweep);
+  } else if (supports === false) draft.score -= SWEEP_DISAGREES_PENALTY;
+}
+
+// src/analysis/levers/secondary.ts
+function secondaryLevers(ctx, curves, drafts) {
+  const epochs = curves.epochs;
+  const { candidate } = ctx;
+  if (epochs !== null && epochs.stoppedLate && !drafts.has("early-stopping")) {
+    drafts.add("early-stopping", EPOCH_CURVE_ALONE, [epochMinimum(epochs, ctx.goal)]);
+  }
+  if (epochs !== null && epochs.stoppedEarly && !drafts.has("train-longer")) {
+    drafts.add("train-longer", EPOCH_CURVE_ALONE, [
+      { kind: "still-improving", epoch: epochs.finalX }
+    ]);
+  }
+  const mismatch = candidate.components.mismatch;
+  if (candidate.diagnosis === "data-mismatch" || mismatch.present) {
+    drafts.add(
+      "align-training-data",
+      candidate.diagnosis === "data-mismatch" ? MISMATCH_DIAGNOSED : MISMATCH_PRESENT,
+      [
+        {
+          kind: "diagnosis",
+          component: "mismatch",
+          value: mismatch.value ?? 0,
+          errorLevel: candidate.errorLevel
+        }
+      ]
+    );
+  }
+  const overfit = candidate.components.overfit;
+  if (overfit.present) {
+    drafts.add("bigger-validation-set", VALIDATION_OVERFIT, [
+      {
+        kind: "diagnosis",
+        component: "overfit",
+        value: overfit.value ?? 0,
+        errorLevel: candidate.errorLevel
+      }
+    ]);
+  }
+  if (candidate.biasUnknown) {
+    drafts.add("supply-reference", SUPPLY_REFERENCE, [{ kind: "reference-missing" }]);
+  }
+  if (ctx.noiseUnknown) {
+    drafts.add("add-repeats", ADD_REPEATS, [{ kind: "noise-unknown" }]);
+  }
+}
+
+// src/analysis/levers/choose.ts
+function chooseLevers(ctx) {
+  const curves = curveEvidence2(ctx.candidate.curves);
+  const drafts = new Drafts();
+  ownChangeLevers(ctx, curves, drafts);
+  diagnosisLevers(ctx, curves, drafts);
+  secondaryLevers(ctx, curves, drafts);
+  return { levers: drafts.ranked(), nonLevers: nonLevers(ctx) };
+}
+function nonLevers(ctx) {
+  const biased = ctx.candidate.diagnosis === "high-bias" || ctx.candidate.diagnosis === "high-bias-and-variance";
+  const shrank = ctx.changes.some((c) => c.kind === "lowered" && knobOf(c.key) === "data");
+  return biased || shrank ? ["smaller-training-set"] : [];
+}
+
+// src/analysis/movement.ts
+var TABLE = {
+  down: { down: "better-on-both", flat: "away-from-underfitting", up: "toward-overfitting" },
+  flat: { down: "away-from-overfitting", flat: "no-significant-change", up: "toward-overfitting" },
+  up: { down: "toward-underfitting", flat: "toward-underfitting", up: "worse-on-both" }
+};
+function movementOf(biasCall, varianceCall) {
+  return TABLE[biasCall][varianceCall];
+}
+function validationChangeOf(shortfallCall) {
+  return shortfallCall === "up" ? "worse" : shortfallCall === "down" ? "better" : "flat";
+}
 
 // src/analysis/curves/early-stopping.ts
 var STRIP = 5;
@@ -48002,10 +50576,10 @@ function gapTrend(points) {
   if (Math.abs(meanGap) <= RELATIVE_CHANGE * Math.abs(meanV)) {
     return { trend: "flat", changePerDoubling: meanGap !== 0 ? sxy / sxx / Math.abs(meanGap) : 0 };
   }
-  const change = sxy / sxx / Math.abs(meanGap);
-  if (change <= -RELATIVE_CHANGE) return { trend: "closing", changePerDoubling: change };
-  if (change < RELATIVE_CHANGE) return { trend: "flat", changePerDoubling: change };
-  return { trend: "unknown", changePerDoubling: change };
+  const change2 = sxy / sxx / Math.abs(meanGap);
+  if (change2 <= -RELATIVE_CHANGE) return { trend: "closing", changePerDoubling: change2 };
+  if (change2 < RELATIVE_CHANGE) return { trend: "flat", changePerDoubling: change2 };
+  return { trend: "unknown", changePerDoubling: change2 };
 }
 
 // src/analysis/curves/lttb.ts
@@ -48212,8 +50786,8 @@ function fitLeastSquares(problem) {
       break;
     }
     for (; ; ) {
-      const delta2 = dampedStep(jac, state.r, free, d, mu);
-      const trial = clamp(p.map((v, j) => v + (delta2[j] ?? 0)));
+      const delta = dampedStep(jac, state.r, free, d, mu);
+      const trial = clamp(p.map((v, j) => v + (delta[j] ?? 0)));
       const step = trial.map((v, j) => v - p[j]);
       const predicted = predictedReduction(jac, state.r, step, state.rss);
       const trialState = evaluate(trial);
@@ -48296,9 +50870,9 @@ function dampedStep(jac, r, free, d, mu) {
   free.forEach((_, k) => rows.push(free.map((__, c) => c === k ? sq : 0)));
   const rhs = [...r, ...free.map(() => 0)];
   const z = qrLeastSquares(rows, rhs).x;
-  const delta2 = new Array(d.length).fill(0);
-  if (z) free.forEach((j, k) => delta2[j] = z[k] / scale[k]);
-  return delta2;
+  const delta = new Array(d.length).fill(0);
+  if (z) free.forEach((j, k) => delta[j] = z[k] / scale[k]);
+  return delta;
 }
 function predictedReduction(jac, r, step, rss) {
   let linear = 0;
@@ -48348,11 +50922,11 @@ function verdict(problem, p, state, iterations, stop, lower, upper, evaluate, ja
       q[j] = Math.min(Math.max(v, lower[j]), upper[j]);
       return evaluate(q).rss;
     };
-    const change = Math.max(
+    const change2 = Math.max(
       Math.abs(probe(pj + h) - state.rss),
       Math.abs(probe(pj - h) - state.rss)
     );
-    return !(change > 1e-12 * state.rss);
+    return !(change2 > 1e-12 * state.rss);
   });
   const scaled = jac.map(
     (row) => free.map((j) => norms[j] > 0 ? row[j] / norms[j] : 0)
@@ -48525,7 +51099,7 @@ var MIN_REGULARIZATION_POINTS = 3;
 function regularizationMinimum(x2, validationError, lambda) {
   const n = x2.length;
   if (n < MIN_REGULARIZATION_POINTS) {
-    return { skipped: `needs at least ${MIN_REGULARIZATION_POINTS} points, has ${n}` };
+    return { skipped: "too-few-points", points: n, needs: MIN_REGULARIZATION_POINTS };
   }
   let i2 = 0;
   validationError.forEach((v, j) => {
@@ -48549,10 +51123,10 @@ function regularizationMinimum(x2, validationError, lambda) {
     const [x0, x1, x22] = [lx[i2 - 1], lx[i2], lx[i2 + 1]];
     const [y0, y1, y2] = [validationError[i2 - 1], validationError[i2], validationError[i2 + 1]];
     step = (x22 - x0) / 2;
-    const num2 = (x1 - x0) ** 2 * (y1 - y2) - (x1 - x22) ** 2 * (y1 - y0);
+    const num = (x1 - x0) ** 2 * (y1 - y2) - (x1 - x22) ** 2 * (y1 - y0);
     const den = (x1 - x0) * (y1 - y2) - (x1 - x22) * (y1 - y0);
     if (den !== 0) {
-      logBest = x1 - num2 / (2 * den);
+      logBest = x1 - num / (2 * den);
       refined = true;
     }
     suggestedX = Math.exp(logBest);
@@ -48567,6 +51141,7 @@ function regularizationMinimum(x2, validationError, lambda) {
 }
 
 // src/analysis/curves/index.ts
+var MIN_EPOCH_POINTS = 2;
 var CHART_POINTS = 60;
 function analyzeCurves(curves, context3) {
   const report = {};
@@ -48600,7 +51175,8 @@ function chart(points, scale, keep) {
   });
 }
 function analyzeEpochs(points, scale) {
-  if (points.length < 2) return { skipped: `needs at least 2 points, has ${points.length}` };
+  if (points.length < MIN_EPOCH_POINTS)
+    return { skipped: "too-few-points", points: points.length, needs: MIN_EPOCH_POINTS };
   const validation = points.map((p) => scale.toError(p.validation));
   const hasTrain = points.every((p) => p.train !== void 0);
   const train = hasTrain ? points.map((p) => scale.toError(p.train)) : null;
@@ -48628,8 +51204,14 @@ function analyzeEpochs(points, scale) {
 function analyzeLearningCurve(points, scale) {
   const m = points.map((p) => p.x);
   const e = points.map((p) => scale.toError(p.validation));
+  const tooFew = {
+    skipped: "too-few-points",
+    points: m.length,
+    needs: MIN_POWER_LAW_POINTS
+  };
+  if (m.length < MIN_POWER_LAW_POINTS) return tooFew;
   const fit = fitPowerLaw(m, e, { lower: scale.lower, upper: scale.upper });
-  if ("skipped" in fit) return fit;
+  if ("skipped" in fit) return { ...tooFew, skipped: "fit-failed" };
   const gap = gapTrend(
     points.map(
       (p) => p.train === void 0 ? { x: p.x, validationError: scale.toError(p.validation) } : {
@@ -48679,517 +51261,51 @@ function analyzeRegularization(points, scale, lambda) {
   };
 }
 
-// src/analysis/measure.ts
-function shortfallSign(run) {
-  return run.metric.goal === "minimize" ? 1 : -1;
-}
-function splitMeasure(split) {
-  return { terms: [{ split, weight: 1 }], constant: 0 };
-}
-function perRepeat(run, measure) {
-  const sign = shortfallSign(run);
-  const columns = [];
-  for (const term of measure.terms) {
-    const split = run.splits[term.split];
-    if (split === void 0) return null;
-    columns.push({ values: split.values, weight: term.weight });
+// src/analysis/run-summary.ts
+function splitSummary(run, split, alpha) {
+  const s = run.splits[split];
+  if (s === void 0) return null;
+  const m = mean(s.values);
+  const n = s.values.length;
+  const sd = n >= 2 ? Math.sqrt(sampleVariance(s.values)) : null;
+  let ci = null;
+  if (sd !== null) {
+    const half = tQuantile(1 - alpha / 2, n - 1) * (sd / Math.sqrt(n));
+    ci = [m - half, m + half];
+  } else if (run.metric.kind === "proportion" && s.examples !== void 0) {
+    ci = wilsonInterval(Math.round(m * s.examples), s.examples, alpha);
   }
-  const repeats = run.splits.train.values.length;
-  const out = [];
-  for (let i2 = 0; i2 < repeats; i2++) {
-    let total = measure.constant;
-    for (const column of columns) total += column.weight * sign * (column.values[i2] ?? Number.NaN);
-    out.push(total);
+  return { split, mean: m, sd, repeats: n, examples: s.examples ?? null, ci };
+}
+function regularizationOf(run) {
+  for (const [key, value2] of Object.entries(run.hyperparameters ?? {})) {
+    if (typeof value2 === "number" && knobOf(key) === "regularization" && !/dropout/i.test(key))
+      return { key, value: value2 };
   }
-  return out;
+  return void 0;
 }
-function binomialMeasureVariance(run, measure) {
-  if (run.metric.kind !== "proportion") return null;
-  let total = 0;
-  for (const term of measure.terms) {
-    const split = run.splits[term.split];
-    if (split?.examples === void 0) return null;
-    const repeats = split.values.length;
-    total += term.weight * term.weight * binomialVariance(mean(split.values), split.examples * repeats);
-  }
-  return total;
-}
-
-// src/analysis/noise.ts
-function callOf(result, settings) {
-  const big = Math.abs(result.estimate) >= settings.minEffect && result.estimate !== 0;
-  const significant = result.p === null ? settings.minEffect > 0 : result.p < settings.alpha;
-  if (!big || !significant) return "flat";
-  return result.estimate > 0 ? "up" : "down";
-}
-function toDelta(result, settings) {
+function summarize(run, settings) {
+  const reference = chooseReference(run, settings.reference);
+  const components = decompose(run, reference.value, settings);
+  const lambda = regularizationOf(run)?.value;
   return {
-    estimate: result.estimate,
-    ci: result.ci,
-    p: result.p,
-    test: result.test,
-    call: callOf(result, settings)
+    name: run.run.name,
+    commit: run.run.commit ?? null,
+    createdAt: run.run.createdAt ?? null,
+    reference: reference.value,
+    referenceSource: reference.source,
+    splits: SPLIT_NAMES.flatMap((s) => splitSummary(run, s, settings.alpha) ?? []),
+    errorLevel: errorLevel(run),
+    components,
+    diagnosis: diagnose(components),
+    biasUnknown: reference.value === null,
+    warnings: components.overfit.present ? ["validation-overfit"] : [],
+    curves: analyzeCurves(run.curves, {
+      ...lambda === void 0 ? {} : { lambda },
+      kind: run.metric.kind,
+      goal: run.metric.goal
+    })
   };
-}
-function measureChange(baseline, candidate, measure, alpha) {
-  const b = perRepeat(baseline, measure.baseline);
-  const c = perRepeat(candidate, measure.candidate);
-  if (b === null || c === null) return null;
-  const estimate = mean(c) - mean(b);
-  if (b.length >= 2 && c.length >= 2) return welchT(b, c, alpha);
-  const vb = binomialMeasureVariance(baseline, measure.baseline);
-  const vc = binomialMeasureVariance(candidate, measure.candidate);
-  if (vb !== null && vc !== null) return normalTest(estimate, vb + vc, alpha, "z-binomial");
-  return { estimate, ci: null, p: null, test: "none" };
-}
-function measureLevel(run, measure, alpha) {
-  const values = perRepeat(run, measure);
-  if (values === null) return null;
-  const value = mean(values);
-  if (values.length >= 2) {
-    const t = oneSampleT(values, alpha);
-    return { value, ci: t.ci, p: t.pGreater };
-  }
-  const variance = binomialMeasureVariance(run, measure);
-  if (variance !== null) {
-    const z = normalTest(value, variance, alpha, "z-binomial");
-    const p = variance > 0 ? 1 - normalCdf(value / Math.sqrt(variance)) : value > 0 ? 0 : 1;
-    return { value, ci: z.ci, p };
-  }
-  return { value, ci: null, p: null };
-}
-function toMetricUnits(result, sign) {
-  if (sign === 1) return result;
-  return {
-    ...result,
-    estimate: -result.estimate,
-    ci: result.ci === null ? null : [-result.ci[1], -result.ci[0]],
-    ...result.statistic === void 0 ? {} : { statistic: -result.statistic }
-  };
-}
-
-// src/analysis/decompose.ts
-function chooseReference(run, override) {
-  if (override !== void 0) return { value: override, source: "config" };
-  if (run.reference !== void 0) return { value: run.reference, source: "artifact" };
-  if (run.metric.kind === "proportion" && run.metric.goal === "minimize")
-    return { value: 0, source: "default" };
-  return { value: null, source: "unknown" };
-}
-function componentMeasures(run, reference) {
-  const sign = shortfallSign(run);
-  const hasDev = run.splits.train_dev !== void 0;
-  return {
-    bias: reference === null ? null : { terms: [{ split: "train", weight: 1 }], constant: -sign * reference },
-    variance: {
-      terms: [
-        { split: hasDev ? "train_dev" : "validation", weight: 1 },
-        { split: "train", weight: -1 }
-      ],
-      constant: 0
-    },
-    mismatch: hasDev ? {
-      terms: [
-        { split: "validation", weight: 1 },
-        { split: "train_dev", weight: -1 }
-      ],
-      constant: 0
-    } : null,
-    overfit: run.splits.test !== void 0 ? {
-      terms: [
-        { split: "test", weight: 1 },
-        { split: "validation", weight: -1 }
-      ],
-      constant: 0
-    } : null
-  };
-}
-function errorLevel(run) {
-  const m = mean(run.splits.validation.values);
-  return Math.abs(run.metric.goal === "minimize" ? m : 1 - m);
-}
-var UNAVAILABLE = {
-  bias: 'No reference level: give "reference" in the artifact or the config (human-level error, a prior system, or an estimated Bayes error).',
-  variance: "Needs train and validation values.",
-  mismatch: "Needs a train_dev split (held-out data from the training distribution).",
-  overfit: "Needs a test split."
-};
-function decompose(run, reference, settings) {
-  const measures = componentMeasures(run, reference);
-  const threshold = Math.max(settings.gapTolerance * errorLevel(run), settings.minEffect);
-  const out = {};
-  for (const name of ["bias", "variance", "mismatch", "overfit"]) {
-    const measure = measures[name];
-    const level = measure === null ? null : measureLevel(run, measure, settings.alpha);
-    if (level === null) {
-      out[name] = {
-        name,
-        value: null,
-        unavailable: UNAVAILABLE[name],
-        ci: null,
-        p: null,
-        present: false
-      };
-      continue;
-    }
-    const significant = level.p === null || level.p < settings.alpha;
-    const present = level.value > 0 && level.value >= threshold && significant;
-    out[name] = { name, value: level.value, ci: level.ci, p: level.p, present };
-  }
-  return out;
-}
-function diagnose(components) {
-  const candidates = ["bias", "variance", "mismatch"].map((name) => components[name]).filter((c) => c.present && c.value !== null).sort((a, b) => (b.value ?? 0) - (a.value ?? 0));
-  const top = candidates[0];
-  if (top === void 0) return "good-fit";
-  const bias = components.bias;
-  const variance = components.variance;
-  if (bias.present && variance.present && bias.value !== null && variance.value !== null) {
-    const ratio = Math.max(bias.value, variance.value) / Math.min(bias.value, variance.value);
-    if (ratio <= 2 && (top.name === "bias" || top.name === "variance"))
-      return "high-bias-and-variance";
-  }
-  if (top.name === "bias") return "high-bias";
-  if (top.name === "variance") return "high-variance";
-  return "data-mismatch";
-}
-
-// src/analysis/format.ts
-function formatValue(value, kind) {
-  if (kind === "proportion") return `${(value * 100).toFixed(Math.abs(value) < 1e-3 ? 2 : 1)}%`;
-  return formatNumber(value);
-}
-function formatChange(value, kind) {
-  const sign = value > 0 ? "+" : value < 0 ? "\u2212" : "\xB1";
-  const magnitude = Math.abs(value);
-  if (kind === "proportion")
-    return `${sign}${(magnitude * 100).toFixed(magnitude < 1e-3 ? 2 : 1)} pts`;
-  return `${sign}${formatNumber(magnitude)}`;
-}
-function formatNumber(value) {
-  if (value === 0) return "0";
-  const abs = Math.abs(value);
-  if (abs >= 1e5 || abs < 1e-3) return value.toExponential(2);
-  return Number(value.toPrecision(4)).toString();
-}
-function formatP(p) {
-  if (p === null) return "n/a";
-  return p < 1e-3 ? "< 0.001" : p.toFixed(3);
-}
-
-// src/analysis/hyperparameters.ts
-function diffHyperparameters(baseline = {}, candidate = {}) {
-  const keys = [.../* @__PURE__ */ new Set([...Object.keys(baseline), ...Object.keys(candidate)])].sort();
-  const out = [];
-  for (const key of keys) {
-    const inB = Object.hasOwn(baseline, key);
-    const inC = Object.hasOwn(candidate, key);
-    const b = baseline[key];
-    const c = candidate[key];
-    if (!inB) out.push({ key, baseline: null, candidate: c, kind: "added" });
-    else if (!inC) out.push({ key, baseline: b, candidate: null, kind: "removed" });
-    else if (typeof b === "number" && typeof c === "number") {
-      if (c > b) out.push({ key, baseline: b, candidate: c, kind: "raised" });
-      else if (c < b) out.push({ key, baseline: b, candidate: c, kind: "lowered" });
-    } else if (JSON.stringify(b) !== JSON.stringify(c))
-      out.push({ key, baseline: b, candidate: c, kind: "changed" });
-  }
-  return out;
-}
-var KNOBS = [
-  [
-    /^(lambda|l2|l2_penalty|weight_decay|reg(ularization)?(_strength)?|ridge_alpha|dropout)$/i,
-    "regularization"
-  ],
-  [/^(features|num_features|n_features|feature_count)$/i, "features"],
-  [/^(polynomial_degree|poly_degree|degree|interaction_terms)$/i, "feature-richness"],
-  [/^(train_examples|training_examples|n_train|train_size|num_train)$/i, "data"],
-  [/^(epochs|max_epochs|num_epochs|iterations|max_iter|steps)$/i, "epochs"],
-  [
-    /^(hidden_units|hidden_size|layers|num_layers|depth|max_depth|width|params|parameters|model_size|n_estimators)$/i,
-    "model-size"
-  ]
-];
-function knobOf(key) {
-  for (const [pattern, knob] of KNOBS) if (pattern.test(key)) return knob;
-  return null;
-}
-var PULLED = {
-  regularization: { raised: "stronger-regularization", lowered: "weaker-regularization" },
-  features: { raised: "more-features", lowered: "fewer-features" },
-  "feature-richness": { raised: "richer-features", lowered: "fewer-features" },
-  data: { raised: "more-data", lowered: "more-data" },
-  epochs: { raised: "train-longer", lowered: "early-stopping" },
-  "model-size": { raised: "bigger-model", lowered: "smaller-model" }
-};
-function pulledLevers(changes) {
-  const out = [];
-  for (const change of changes) {
-    if (change.kind !== "raised" && change.kind !== "lowered") continue;
-    const knob = knobOf(change.key);
-    if (knob === null) continue;
-    if (knob === "data" && change.kind === "lowered") continue;
-    out.push({ lever: PULLED[knob][change.kind], change, knob });
-  }
-  return out;
-}
-
-// src/analysis/levers/choose.ts
-var LEVER_CATALOGUE = {
-  "more-data": { addresses: "variance", meaning: "train on more examples" },
-  "fewer-features": { addresses: "variance", meaning: "drop weak or redundant features" },
-  "stronger-regularization": {
-    addresses: "variance",
-    meaning: "raise the regularization strength"
-  },
-  "smaller-model": { addresses: "variance", meaning: "reduce model capacity" },
-  "early-stopping": { addresses: "variance", meaning: "stop at the validation minimum" },
-  "more-features": { addresses: "bias", meaning: "add informative features" },
-  "richer-features": { addresses: "bias", meaning: "add polynomial or interaction terms" },
-  "weaker-regularization": { addresses: "bias", meaning: "lower the regularization strength" },
-  "bigger-model": { addresses: "bias", meaning: "increase model capacity" },
-  "train-longer": { addresses: "bias", meaning: "train for more epochs" },
-  "align-training-data": {
-    addresses: "mismatch",
-    meaning: "make training data look like validation data"
-  },
-  "bigger-validation-set": {
-    addresses: "validation-overfit",
-    meaning: "enlarge or refresh the validation set"
-  },
-  "add-repeats": { addresses: "evidence", meaning: "repeat training with other seeds" },
-  "supply-reference": { addresses: "evidence", meaning: "give a reference level" }
-};
-var BY_TARGET = {
-  variance: [
-    "more-data",
-    "stronger-regularization",
-    "fewer-features",
-    "early-stopping",
-    "smaller-model"
-  ],
-  bias: [
-    "richer-features",
-    "more-features",
-    "weaker-regularization",
-    "bigger-model",
-    "train-longer"
-  ]
-};
-var SMALLER_TRAINING_SET_NOTE = "A smaller training set is not a cure for high bias: it only lowers the training error, while validation error stays high or rises.";
-function learning(curves) {
-  const c = curves.training_examples;
-  return c !== void 0 && !("skipped" in c) ? c : null;
-}
-function regularization(curves) {
-  const c = curves.regularization;
-  return c !== void 0 && !("skipped" in c) ? c : null;
-}
-function epochs(curves) {
-  const c = curves.epochs;
-  return c !== void 0 && !("skipped" in c) ? c : null;
-}
-function targets(diagnosis, run) {
-  const b = run.components.bias.value ?? 0;
-  const v = run.components.variance.value ?? 0;
-  switch (diagnosis) {
-    case "high-variance":
-      return ["variance"];
-    case "high-bias":
-      return ["bias"];
-    case "high-bias-and-variance":
-      return b >= v ? ["bias", "variance"] : ["variance", "bias"];
-    default:
-      return [];
-  }
-}
-function chooseLevers(ctx) {
-  const { kind } = ctx;
-  const v = (x2) => formatValue(x2, kind);
-  const curves = ctx.candidate.curves;
-  const drafts = /* @__PURE__ */ new Map();
-  const add = (id, score, reason, evidence = []) => {
-    const existing = drafts.get(id);
-    if (existing === void 0 || existing.score < score)
-      drafts.set(id, { id, reason, evidence, score });
-  };
-  const pulled = new Map(ctx.pulled.map((p) => [p.lever, p]));
-  const pulledNote = (id) => {
-    const p = pulled.get(id);
-    if (p === void 0) return null;
-    return `this PR already ${p.change.kind} ${p.change.key} (${String(p.change.baseline)} \u2192 ${String(p.change.candidate)})`;
-  };
-  const lc = learning(curves);
-  const reg = regularization(curves);
-  const ep = epochs(curves);
-  const stopEarlierReason = (e) => `Validation minimum at epoch ${formatNumber(e.bestX)} of ${formatNumber(e.finalX)}; stopping there saves ${formatChange(e.finalValidation - e.bestValidation, kind).replace(/^\+/, "")}${e.gl === null ? "" : ` (generalization loss ${e.gl.toFixed(1)}%)`}.`;
-  const trainLongerReason = (e) => `Train and validation ${ctx.metricName} were both still falling at epoch ${formatNumber(e.finalX)}: train longer.`;
-  for (const p of ctx.pulled) {
-    const { baseline: from, candidate: to } = p.change;
-    if (typeof from !== "number" || typeof to !== "number") continue;
-    const between = from > 0 && to > 0 ? Math.sqrt(from * to) : (from + to) / 2;
-    const overshotTowardBias = ctx.movement === "toward-underfitting" || ctx.movement === "worse-on-both";
-    const overshotTowardVariance = ctx.movement === "toward-overfitting" || ctx.movement === "worse-on-both";
-    if (p.lever === "stronger-regularization" && overshotTowardBias) {
-      add(
-        "weaker-regularization",
-        100,
-        `${p.change.key} rose ${from} \u2192 ${to} and moved the model toward underfitting (\u0394bias ${formatChange(ctx.bias.estimate, kind)}); try ${p.change.key} \u2248 ${formatNumber(between)}, between the two.`,
-        [`\u0394bias ${formatChange(ctx.bias.estimate, kind)}, p ${formatP(ctx.bias.p)}`]
-      );
-    }
-    if (p.lever === "weaker-regularization" && overshotTowardVariance) {
-      add(
-        "stronger-regularization",
-        100,
-        `${p.change.key} fell ${from} \u2192 ${to} and moved the model toward overfitting (\u0394variance ${formatChange(ctx.variance.estimate, kind)}); try ${p.change.key} \u2248 ${formatNumber(between)}, between the two.`,
-        [`\u0394variance ${formatChange(ctx.variance.estimate, kind)}, p ${formatP(ctx.variance.p)}`]
-      );
-    }
-    if ((p.lever === "richer-features" || p.lever === "more-features" || p.lever === "bigger-model") && overshotTowardVariance) {
-      const back = p.lever === "bigger-model" ? "smaller-model" : "fewer-features";
-      add(
-        back,
-        90,
-        `${p.change.key} rose ${from} \u2192 ${to} and moved the model toward overfitting (\u0394variance ${formatChange(ctx.variance.estimate, kind)}); step back toward ${formatNumber(between)} or keep it and regularize harder.`,
-        [`\u0394variance ${formatChange(ctx.variance.estimate, kind)}`]
-      );
-      if (reg !== null && reg.side === "below") {
-        add(
-          "stronger-regularization",
-          95,
-          `Keep the new ${p.change.key} and regularize harder: the candidate's sweep has its validation minimum at \u03BB \u2248 ${formatNumber(reg.bestX)}${ctx.lambda === void 0 ? "" : ` (it uses ${formatNumber(ctx.lambda)})`}; try ${formatNumber(reg.suggestedX)}.`,
-          [`lowest validation ${v(reg.bestValidation)} at \u03BB \u2248 ${formatNumber(reg.bestX)}`]
-        );
-      } else {
-        add(
-          "stronger-regularization",
-          85,
-          `Keep the new ${p.change.key} but counter its extra variance with stronger regularization.`,
-          []
-        );
-      }
-    }
-  }
-  const order = targets(ctx.candidate.diagnosis, ctx.candidate);
-  order.forEach((target, t) => {
-    const component = ctx.candidate.components[target];
-    const label = target === "bias" ? "avoidable bias" : "variance";
-    const size = component.value === null ? "" : `: ${label} ${v(component.value)} against a validation error of ${v(ctx.candidate.errorLevel)}`;
-    BY_TARGET[target].forEach((id, i2) => {
-      let score = 60 - t * 20 - i2 * 2;
-      let reason = `The candidate has high ${target}${size}.`;
-      const evidence = [];
-      if (id === "more-data" && lc !== null) {
-        const twice = lc.projections[0];
-        if (twice !== void 0) {
-          reason = `2\xD7 data projects validation ${ctx.metricName} ${v(ctx.candidate.splits.find((s) => s.split === "validation")?.mean ?? 0)} \u2192 ${v(twice.validation)} (power-law fit R\xB2 ${lc.r2.toFixed(2)}).`;
-          evidence.push(
-            `fit e(m) = ${formatNumber(lc.a)}\xB7m^\u2212${formatNumber(lc.b)} + ${formatNumber(lc.c)}; at ${formatNumber(twice.x)} examples: ${v(twice.ci[0])} to ${v(twice.ci[1])}`
-          );
-        }
-        if (lc.gapTrend === "flat") {
-          score -= 25;
-          reason = `More data will help little: the train/validation gap is flat at the right end of the learning curve.`;
-        } else if (lc.gapTrend === "closing") score += 8;
-      }
-      if ((id === "stronger-regularization" || id === "weaker-regularization") && reg !== null) {
-        const wants = id === "stronger-regularization" ? "below" : "above";
-        if (reg.atEdge !== null) {
-          evidence.push(
-            `the sweep's minimum is at its ${reg.atEdge} end (${formatNumber(reg.bestX)}): extend the sweep`
-          );
-        }
-        if (reg.side === wants) {
-          score += 10;
-          reason = `The regularization sweep has its validation minimum at \u03BB \u2248 ${formatNumber(reg.bestX)}${ctx.lambda === void 0 ? "" : `, the candidate uses ${formatNumber(ctx.lambda)}`}; try ${formatNumber(reg.suggestedX)}.`;
-        } else if (reg.side !== "unknown") {
-          score -= 20;
-          const meaning = LEVER_CATALOGUE[id].meaning;
-          reason = `${meaning.charAt(0).toUpperCase()}${meaning.slice(1)}, but the sweep's validation minimum (\u03BB \u2248 ${formatNumber(reg.bestX)}) is on the other side.`;
-        }
-      }
-      if (id === "early-stopping") {
-        if (ep !== null && ep.stoppedLate) {
-          score += 12;
-          reason = stopEarlierReason(ep);
-        } else {
-          score -= 15;
-          reason = `${reason} ${ep === null ? "No epoch curve to confirm it." : "The epoch curve does not show training past the validation minimum."}`;
-        }
-      }
-      if (id === "train-longer") {
-        if (ep !== null && ep.stoppedEarly) {
-          score += 12;
-          reason = trainLongerReason(ep);
-        } else {
-          score -= 15;
-          reason = `${reason} ${ep === null ? "No epoch curve to confirm it." : "The epoch curve does not show both errors still falling at the end."}`;
-        }
-      }
-      if (id === "weaker-regularization" && ctx.lambda === void 0 && reg === null) score -= 10;
-      const note = pulledNote(id);
-      if (note !== null) {
-        score -= 30;
-        reason = `${reason} Note: ${note}; judge its effect before pulling further.`;
-      }
-      add(id, score, reason, evidence);
-    });
-  });
-  if (ep !== null && ep.stoppedLate && !drafts.has("early-stopping")) {
-    add("early-stopping", 35, stopEarlierReason(ep));
-  }
-  if (ep !== null && ep.stoppedEarly && !drafts.has("train-longer")) {
-    add("train-longer", 35, trainLongerReason(ep));
-  }
-  if (ctx.candidate.diagnosis === "data-mismatch" || ctx.candidate.components.mismatch.present) {
-    const d = ctx.candidate.components.mismatch.value ?? 0;
-    add(
-      "align-training-data",
-      ctx.candidate.diagnosis === "data-mismatch" ? 70 : 30,
-      `Validation error exceeds train_dev error by ${v(d)}: the training data does not look like the validation data; collect or synthesise training data that resembles it.`
-    );
-  }
-  if (ctx.candidate.components.overfit.present) {
-    add(
-      "bigger-validation-set",
-      40,
-      `Test error exceeds validation error by ${v(ctx.candidate.components.overfit.value ?? 0)}: choices may be tuned to the validation set; enlarge or refresh it.`
-    );
-  }
-  if (ctx.candidate.biasUnknown) {
-    add(
-      "supply-reference",
-      20,
-      'Bias is unknown without a reference level: add "reference" (human-level error, a prior system, or an estimated Bayes error) to the artifacts or the config.'
-    );
-  }
-  if (ctx.noiseUnknown) {
-    add(
-      "add-repeats",
-      15,
-      "Run-to-run noise is unknown: train with 2 or more seeds (or ship per-example predictions) so changes can be tested."
-    );
-  }
-  const levers = [...drafts.values()].sort((a, b) => b.score - a.score).map(({ id, reason, evidence }) => ({ id, reason, evidence }));
-  const nonLevers = [];
-  const biasy = ctx.candidate.diagnosis === "high-bias" || ctx.candidate.diagnosis === "high-bias-and-variance";
-  const shrank = ctx.changes.some((c) => c.kind === "lowered" && knobOf(c.key) === "data");
-  if (biasy || shrank) nonLevers.push(SMALLER_TRAINING_SET_NOTE);
-  return { levers, nonLevers };
-}
-
-// src/analysis/movement.ts
-var TABLE = {
-  down: { down: "better-on-both", flat: "away-from-underfitting", up: "toward-overfitting" },
-  flat: { down: "away-from-overfitting", flat: "no-significant-change", up: "toward-overfitting" },
-  up: { down: "toward-underfitting", flat: "toward-underfitting", up: "worse-on-both" }
-};
-function movementOf(biasCall, varianceCall) {
-  return TABLE[biasCall][varianceCall];
-}
-function validationChangeOf(shortfallCall) {
-  return shortfallCall === "up" ? "worse" : shortfallCall === "down" ? "better" : "flat";
 }
 
 // src/analysis/slices.ts
@@ -49215,258 +51331,156 @@ function compareSlices(baseline, candidate, aggregate, settings) {
   }
   unpaired.push(...base.keys());
   const adjusted = holmAdjust(pairs.map((p) => p.test.p));
-  const slices = pairs.map(({ b, c, test }, i2) => {
+  const slices2 = pairs.map(({ b, c, test }, i2) => {
     const pAdjusted = adjusted[i2] ?? null;
     const call = callOf({ ...test, p: pAdjusted }, settings);
-    const change = call === "flat" ? "flat" : call === "up" === (sign === 1) ? "worse" : "better";
+    const change2 = call === "flat" ? "flat" : call === "up" === (sign === 1) ? "worse" : "better";
     return {
       name: c.name,
       examples: c.examples ?? null,
       baseline: b.validation,
       candidate: c.validation,
-      delta: {
-        estimate: test.estimate,
-        ci: test.ci,
-        p: test.p,
-        test: test.test,
-        call: callOf(test, settings)
-      },
+      delta: toMetricDelta(test, settings),
       pAdjusted,
-      change,
-      hiddenRegression: change === "worse" && aggregate === "better"
+      change: change2,
+      hiddenRegression: change2 === "worse" && aggregate === "better"
     };
   });
-  return { slices, unpaired };
+  return { slices: slices2, unpaired };
 }
 
 // src/analysis/review.ts
-function splitSummary(run, split, alpha) {
-  const s = run.splits[split];
-  if (s === void 0) return null;
-  const m = mean(s.values);
-  const n = s.values.length;
-  const sd = n >= 2 ? Math.sqrt(sampleVariance(s.values)) : null;
-  let ci = null;
-  if (sd !== null) {
-    const half = tQuantile(1 - alpha / 2, n - 1) * (sd / Math.sqrt(n));
-    ci = [m - half, m + half];
-  } else if (run.metric.kind === "proportion" && s.examples !== void 0) {
-    ci = wilsonInterval(Math.round(m * s.examples), s.examples, alpha);
-  }
-  return { split, mean: m, sd, repeats: n, examples: s.examples ?? null, ci };
+var NOTE_NAMES = 5;
+function failOnOf(values) {
+  return values.map((value2) => {
+    if (!isFailOn(value2)) throw new RangeError(`unknown fail-on outcome ${JSON.stringify(value2)}`);
+    return value2;
+  });
 }
-function lambdaOf(run) {
-  for (const [key, value] of Object.entries(run.hyperparameters ?? {})) {
-    if (typeof value === "number" && knobOf(key) === "regularization" && !/dropout/i.test(key))
-      return value;
-  }
-  return void 0;
-}
-function summarize(run, settings) {
-  const reference = chooseReference(run, settings.reference);
-  const components = decompose(run, reference.value, settings);
-  const diagnosis = diagnose(components);
-  const warnings = [];
-  if (components.overfit.present) {
-    warnings.push(
-      "Test error is well above validation error: model choices may be tuned to the validation set."
-    );
-  }
-  const lambda = lambdaOf(run);
+function reviewSettings(input) {
   return {
-    name: run.run.name,
-    commit: run.run.commit ?? null,
-    createdAt: run.run.createdAt ?? null,
-    reference: reference.value,
-    referenceSource: reference.source,
-    splits: SPLIT_NAMES.flatMap((s) => splitSummary(run, s, settings.alpha) ?? []),
-    errorLevel: errorLevel(run),
-    components,
-    diagnosis,
-    biasUnknown: reference.value === null,
-    warnings,
-    curves: analyzeCurves(run.curves, {
-      ...lambda === void 0 ? {} : { lambda },
-      kind: run.metric.kind,
-      goal: run.metric.goal
-    })
+    alpha: input.alpha,
+    minEffect: input.minEffect,
+    gapTolerance: input.gapTolerance,
+    failOn: failOnOf(input.failOn)
   };
 }
-function pairedTest(paired, run, alpha) {
-  if (paired.rows === 0) return null;
-  if (paired.kind === "proportion") {
-    const result = mcnemarExact(
-      paired.baselineOnly ?? 0,
-      paired.candidateOnly ?? 0,
-      paired.rows,
-      alpha
-    );
-    return run.metric.goal === "minimize" ? toMetricUnits(result, -1) : result;
-  }
-  return pairedT(
-    { n: paired.rows, mean: paired.meanDiff ?? 0, variance: paired.varDiff ?? 0 },
-    alpha
-  );
-}
-function both(measure) {
-  return { baseline: measure, candidate: measure };
-}
+var NO_BIAS_CHANGE = {
+  unit: "shortfall",
+  estimate: 0,
+  ci: null,
+  p: null,
+  test: "none",
+  call: "flat"
+};
 function buildReview(input) {
-  const { baseline, candidate, settings } = input;
+  const { baseline, candidate } = input;
+  const settings = reviewSettings(input.settings);
   const calls = { alpha: settings.alpha, minEffect: settings.minEffect };
-  const sign = shortfallSign(candidate);
-  const notes = [...input.notes ?? []];
-  const base = summarize(baseline, settings);
-  const cand = summarize(candidate, settings);
-  const pairedSplit = input.paired?.split ?? "validation";
-  const shortfallChanges = /* @__PURE__ */ new Map();
-  for (const split of SPLIT_NAMES) {
-    let result = measureChange(baseline, candidate, both(splitMeasure(split)), settings.alpha);
-    if (result === null) continue;
-    if (input.paired !== void 0 && split === pairedSplit && (result.test === "none" || result.test === "z-binomial")) {
-      const paired2 = pairedTest(input.paired, candidate, settings.alpha);
-      if (paired2 !== null) result = toMetricUnits(paired2, sign);
-    }
-    shortfallChanges.set(split, result);
-  }
-  const validationShortfall = shortfallChanges.get("validation");
+  const reference = input.settings.reference;
+  const summarySettings = { ...settings, ...reference === void 0 ? {} : { reference } };
+  const base = summarize(baseline, summarySettings);
+  const cand = summarize(candidate, summarySettings);
+  const runs = { baseline, candidate };
+  const shortfalls = splitShortfalls(runs, settings.alpha, input.paired);
+  const validationShortfall = shortfalls.get("validation");
   if (validationShortfall === void 0)
     throw new Error("validation split is required by the schema");
-  const validationDelta = toDelta(validationShortfall, calls);
-  const splits = [];
-  for (const [split, result] of shortfallChanges) {
-    const b = base.splits.find((s) => s.split === split);
-    const c = cand.splits.find((s) => s.split === split);
-    if (b === void 0 || c === void 0) continue;
-    splits.push({
-      split,
-      baseline: b.mean,
-      candidate: c.mean,
-      delta: toDelta(toMetricUnits(result, sign), calls)
-    });
-  }
-  const refB = base.reference;
-  const refC = cand.reference;
-  const [biasRefB, biasRefC] = refB !== null && refC !== null ? [refB, refC] : [0, 0];
-  const biasResult = measureChange(
-    baseline,
-    candidate,
-    {
-      baseline: componentMeasures(baseline, biasRefB).bias ?? splitMeasure("train"),
-      candidate: componentMeasures(candidate, biasRefC).bias ?? splitMeasure("train")
-    },
-    settings.alpha
+  const components = componentChanges(
+    runs,
+    { baseline: base.reference, candidate: cand.reference },
+    calls
   );
-  const componentChange = (name) => {
-    const mb = componentMeasures(baseline, refB)[name];
-    const mc = componentMeasures(candidate, refC)[name];
-    if (mb === null || mc === null) return null;
-    if (name === "variance" && baseline.splits.train_dev === void 0 !== (candidate.splits.train_dev === void 0)) {
-      const fallback = {
-        terms: [
-          { split: "validation", weight: 1 },
-          { split: "train", weight: -1 }
-        ],
-        constant: 0
-      };
-      notes.push(
-        "Only one run has a train_dev split: the variance change is measured as validation \u2212 train in both."
-      );
-      const r2 = measureChange(baseline, candidate, both(fallback), settings.alpha);
-      return r2 === null ? null : toDelta(r2, calls);
-    }
-    const r = measureChange(baseline, candidate, { baseline: mb, candidate: mc }, settings.alpha);
-    return r === null ? null : toDelta(r, calls);
+  const movement = movementOf(components.bias?.call ?? "flat", components.variance.call);
+  const validation = {
+    change: validationChangeOf(toShortfallDelta(validationShortfall, calls).call),
+    delta: toMetricDelta(toMetricUnits(validationShortfall, shortfallSign(candidate)), calls)
   };
-  const biasDelta = biasResult === null ? null : toDelta(biasResult, calls);
-  const varianceDelta = componentChange("variance");
-  if (varianceDelta === null)
-    throw new Error("variance needs train and validation, which the schema requires");
-  const movement = movementOf(biasDelta?.call ?? "flat", varianceDelta.call);
-  const validationChange = validationChangeOf(validationDelta.call);
-  const sliceResult = compareSlices(baseline, candidate, validationChange, calls);
-  if (sliceResult.unpaired.length > 0) {
-    notes.push(
-      `${sliceResult.unpaired.length} slice(s) appear in one run only and were not compared: ${sliceResult.unpaired.slice(0, 5).join(", ")}${sliceResult.unpaired.length > 5 ? ", \u2026" : ""}.`
-    );
-  }
-  const hidden = sliceResult.slices.filter((s) => s.hiddenRegression);
-  if (hidden.length > 0) {
-    notes.push(
-      `Validation improved overall, yet ${hidden.length} slice(s) regressed significantly (Holm-adjusted): ${hidden.slice(0, 5).map((s) => s.name).join(", ")}.`
-    );
-  }
-  const noiseUnknown = validationDelta.test === "none" || varianceDelta.test === "none";
-  if (noiseUnknown) {
-    notes.push(
-      settings.minEffect > 0 ? `Run-to-run noise is unknown (one repeat of a continuous metric, no per-example predictions): changes are called on size alone (min-effect ${formatValue(settings.minEffect, candidate.metric.kind)}).` : "Run-to-run noise is unknown (one repeat of a continuous metric, no per-example predictions) and min-effect is 0: no change can be called. Add repeats (seeds), per-example predictions, or set min-effect."
-    );
-  }
-  if (cand.biasUnknown) {
-    notes.push(
-      "Avoidable bias is unknown: there is no reference level for this metric. Its change is still measured from the training error; the diagnosis rests on variance and data mismatch."
-    );
-  }
-  if (input.paired !== void 0 && input.paired.rows === 0) {
-    notes.push("The two predictions files share no id: the paired test was not used.");
-  }
+  const sliceResult = compareSlices(baseline, candidate, validation.change, calls);
+  const noiseUnknown = validation.delta.test === "none" || components.variance.test === "none";
   const changes = diffHyperparameters(baseline.hyperparameters, candidate.hyperparameters);
-  const lambda = lambdaOf(candidate);
-  const { levers, nonLevers } = chooseLevers({
-    kind: candidate.metric.kind,
-    metricName: candidate.metric.name,
+  const { levers, nonLevers: nonLevers2 } = chooseLevers({
+    goal: candidate.metric.goal,
     candidate: cand,
     baseline: base,
     movement,
-    bias: biasDelta ?? { estimate: 0, ci: null, p: null, test: "none", call: "flat" },
-    variance: varianceDelta,
+    bias: components.bias ?? NO_BIAS_CHANGE,
+    variance: components.variance,
     pulled: pulledLevers(changes),
     changes,
-    lambda,
+    regularization: regularizationOf(candidate),
     noiseUnknown
   });
-  const partial = {
-    movement,
-    validation: {
-      change: validationChange,
-      delta: toDelta(toMetricUnits(validationShortfall, sign), calls)
-    },
-    slices: sliceResult.slices,
-    candidate: cand,
-    settings: {
-      alpha: settings.alpha,
-      minEffect: settings.minEffect,
-      gapTolerance: settings.gapTolerance,
-      failOn: [...settings.failOn]
-    }
-  };
-  const gate = applyGate(partial);
-  const paired = input.paired === void 0 ? null : {
-    rows: input.paired.rows,
-    test: input.paired.kind === "proportion" ? "mcnemar-exact" : "paired-t",
-    ...input.paired.kind === "proportion" ? {
-      discordant: {
-        baselineOnly: input.paired.baselineOnly ?? 0,
-        candidateOnly: input.paired.candidateOnly ?? 0
-      }
-    } : {}
-  };
+  const gate = applyGate(
+    { movement, validation, slices: sliceResult.slices, candidate: cand },
+    settings.failOn
+  );
   return {
     format: "fitgap-review/1",
     metric: { ...candidate.metric },
-    ...partial,
-    bias: { delta: biasDelta },
-    variance: { delta: varianceDelta },
-    mismatch: { delta: componentChange("mismatch") },
-    overfit: { delta: componentChange("overfit") },
-    splits,
+    settings,
+    movement,
+    validation,
+    bias: { delta: components.bias },
+    variance: { delta: components.variance },
+    mismatch: { delta: components.mismatch },
+    overfit: { delta: components.overfit },
+    splits: splitChanges(shortfalls, runs, { baseline: base, candidate: cand }, calls),
     baseline: base,
+    candidate: cand,
+    slices: sliceResult.slices,
     hyperparameters: changes,
     levers,
-    nonLevers,
+    nonLevers: nonLevers2,
     gate,
-    notes,
-    paired
+    notes: [
+      ...input.notes ?? [],
+      ...reviewNotes2({
+        components,
+        unpaired: sliceResult.unpaired,
+        slices: sliceResult.slices,
+        noiseUnknown,
+        biasUnknown: cand.biasUnknown,
+        paired: input.paired
+      })
+    ],
+    paired: pairedSummary(input.paired)
+  };
+}
+function reviewNotes2(facts) {
+  const notes = [];
+  if (facts.components.varianceFallback) notes.push({ code: "train-dev-in-one-run" });
+  if (facts.unpaired.length > 0) {
+    notes.push({
+      code: "unpaired-slices",
+      count: facts.unpaired.length,
+      names: facts.unpaired.slice(0, NOTE_NAMES)
+    });
+  }
+  const hidden = facts.slices.filter((s) => s.hiddenRegression);
+  if (hidden.length > 0) {
+    notes.push({
+      code: "hidden-regressions",
+      count: hidden.length,
+      names: hidden.slice(0, NOTE_NAMES).map((s) => s.name)
+    });
+  }
+  if (facts.noiseUnknown) notes.push({ code: "noise-unknown" });
+  if (facts.biasUnknown) notes.push({ code: "bias-unknown" });
+  if (facts.paired !== void 0 && facts.paired.rows === 0)
+    notes.push({ code: "predictions-share-no-id" });
+  return notes;
+}
+function pairedSummary(paired) {
+  if (paired === void 0) return null;
+  if (paired.kind === "continuous") return { rows: paired.rows, test: "paired-t" };
+  return {
+    rows: paired.rows,
+    test: "mcnemar-exact",
+    discordant: {
+      baselineOnly: paired.baselineOnly ?? 0,
+      candidateOnly: paired.candidateOnly ?? 0
+    }
   };
 }
 
@@ -49509,8 +51523,8 @@ function parseEpochLog(text2, file, mapping) {
     const cells = splitCsvLine(raw);
     const read = (index, name) => {
       const cell = cells[index] ?? "";
-      const value = cell === "" ? Number.NaN : Number(cell);
-      if (!Number.isFinite(value)) {
+      const value2 = cell === "" ? Number.NaN : Number(cell);
+      if (!Number.isFinite(value2)) {
         issues2.push({
           file,
           pointer: `line ${i2 + 1}`,
@@ -49518,7 +51532,7 @@ function parseEpochLog(text2, file, mapping) {
           got: quote(cell)
         });
       }
-      return value;
+      return value2;
     };
     const point = { x: read(xi, mapping.x), validation: read(vi, mapping.validation) };
     if (ti !== void 0 && mapping.train !== void 0) point.train = read(ti, mapping.train);
@@ -49583,7 +51597,7 @@ function parseJson(text2, file) {
 }
 
 // src/validate/run.ts
-var import__ = __toESM(require__(), 1);
+var import__2 = __toESM(require__(), 1);
 var import_ajv_formats = __toESM(require_dist(), 1);
 
 // schema/fitgap-run-1.schema.json
@@ -49898,117 +51912,13 @@ var fitgap_run_1_schema_default = {
   }
 };
 
-// src/validate/ajv-issues.ts
-function valueAt(doc, pointer) {
-  if (pointer === "") return doc;
-  let node = doc;
-  for (const raw of pointer.slice(1).split("/")) {
-    const key = raw.replace(/~1/g, "/").replace(/~0/g, "~");
-    if (node === null || typeof node !== "object") return void 0;
-    node = node[key];
-  }
-  return node;
-}
-function escapePointerToken(token) {
-  return token.replace(/~/g, "~0").replace(/\//g, "~1");
-}
-function typeName(value) {
-  if (value === null) return "null";
-  if (Array.isArray(value)) return "an array";
-  if (typeof value === "object") return "an object";
-  return `${typeof value} ${quote(value)}`;
-}
-function oneIssue(error2, file, doc) {
-  const pointer = error2.instancePath;
-  const value = valueAt(doc, pointer);
-  const params = error2.params;
-  switch (error2.keyword) {
-    case "required":
-      return {
-        file,
-        pointer: pointer === "" ? "/" : pointer,
-        expected: `must have the key "${String(params["missingProperty"])}"`,
-        hint: "Add it; see schema/fitgap-run-1.schema.json for the format."
-      };
-    case "additionalProperties": {
-      const key = String(params["additionalProperty"]);
-      return {
-        file,
-        pointer: `${pointer}/${escapePointerToken(key)}`,
-        expected: "is not a known key",
-        hint: "Check the spelling; unknown keys are rejected so that a typo cannot pass silently."
-      };
-    }
-    case "type":
-      return {
-        file,
-        pointer,
-        expected: `must be ${String(params["type"]) === "integer" ? "an integer" : `of type ${String(params["type"])}`}`,
-        got: typeName(value),
-        ...params["type"] === "number" && typeof value === "string" ? { hint: "Write numbers without quotes." } : {}
-      };
-    case "enum":
-      return {
-        file,
-        pointer,
-        expected: `must be one of ${params["allowedValues"].map((v) => quote(v)).join(", ")}`,
-        got: quote(value)
-      };
-    case "const":
-      return {
-        file,
-        pointer,
-        expected: `must be ${quote(params["allowedValue"])}`,
-        got: quote(value)
-      };
-    case "format":
-      return {
-        file,
-        pointer,
-        expected: `must be a ${String(params["format"])} string`,
-        got: quote(value),
-        ...params["format"] === "date-time" ? { hint: 'Use RFC 3339, e.g. "2026-11-30T10:00:00Z".' } : {}
-      };
-    default:
-      return {
-        file,
-        pointer,
-        expected: error2.message ?? `fails ${error2.keyword}`,
-        got: quote(value)
-      };
-  }
-}
-function ajvIssues(errors, file, doc) {
-  const seen = /* @__PURE__ */ new Set();
-  const issues2 = [];
-  for (const error2 of errors) {
-    const issue2 = oneIssue(error2, file, doc);
-    const key = `${issue2.pointer}|${issue2.expected}`;
-    if (seen.has(key)) continue;
-    seen.add(key);
-    issues2.push(issue2);
-  }
-  return issues2;
-}
-function nonFiniteNumbers(doc, pointer = "") {
-  if (typeof doc === "number") return Number.isFinite(doc) ? [] : [pointer];
-  if (Array.isArray(doc))
-    return doc.flatMap((item, i2) => nonFiniteNumbers(item, `${pointer}/${i2}`));
-  if (doc !== null && typeof doc === "object") {
-    return Object.entries(doc).flatMap(
-      ([k, v]) => nonFiniteNumbers(v, `${pointer}/${escapePointerToken(k)}`)
-    );
-  }
-  return [];
-}
-
 // src/validate/guardrails.ts
 function guardrailIssues(run, file) {
   const issues2 = [];
-  const names = /* @__PURE__ */ new Map();
+  const names2 = /* @__PURE__ */ new Map();
   run.guardrails?.forEach((guardrail, g) => {
     const at = `/guardrails/${g}`;
-    const first = names.get(guardrail.metric.name);
+    const first = names2.get(guardrail.metric.name);
     if (first !== void 0) {
       issues2.push({
         file,
@@ -50016,7 +51926,7 @@ function guardrailIssues(run, file) {
         expected: `must be unique among the guardrails (also at /guardrails/${first}/metric/name)`,
         got: quote(guardrail.metric.name)
       });
-    } else names.set(guardrail.metric.name, g);
+    } else names2.set(guardrail.metric.name, g);
     if (guardrail.metric.name === run.metric.name) {
       issues2.push({
         file,
@@ -50046,25 +51956,25 @@ function guardrailIssues(run, file) {
 // src/validate/run.ts
 var formatsModule = import_ajv_formats.default;
 var addFormats = typeof formatsModule === "function" ? formatsModule : formatsModule.default;
-var compiled;
+var compiled2;
 function validator() {
-  if (compiled === void 0) {
-    const ajv2 = new import__.Ajv2020({ allErrors: true, strict: true, strictNumbers: true });
+  if (compiled2 === void 0) {
+    const ajv2 = new import__2.Ajv2020({ allErrors: true, strict: true, strictNumbers: true });
     addFormats(ajv2, ["date-time"]);
-    compiled = ajv2.compile(fitgap_run_1_schema_default);
+    compiled2 = ajv2.compile(fitgap_run_1_schema_default);
   }
-  return compiled;
+  return compiled2;
 }
 function semanticIssues(run, file) {
   const issues2 = [];
   const proportion = run.metric.kind === "proportion";
-  const inUnit = (value, pointer) => {
-    if (proportion && (value < 0 || value > 1)) {
+  const inUnit = (value2, pointer) => {
+    if (proportion && (value2 < 0 || value2 > 1)) {
       issues2.push({
         file,
         pointer,
         expected: "must be within [0, 1] for a proportion metric",
-        got: quote(value),
+        got: quote(value2),
         hint: 'Write rates as fractions (0.07, not 7), or declare metric.kind "continuous".'
       });
     }
@@ -50125,9 +52035,9 @@ function semanticIssues(run, file) {
     inUnit(slice.validation, `/slices/${i2}/validation`);
     if (slice.train !== void 0) inUnit(slice.train, `/slices/${i2}/train`);
   });
-  const names = /* @__PURE__ */ new Map();
+  const names2 = /* @__PURE__ */ new Map();
   run.slices?.forEach((slice, i2) => {
-    const first = names.get(slice.name);
+    const first = names2.get(slice.name);
     if (first !== void 0) {
       issues2.push({
         file,
@@ -50135,7 +52045,7 @@ function semanticIssues(run, file) {
         expected: `must be unique (also at /slices/${first}/name)`,
         got: quote(slice.name)
       });
-    } else names.set(slice.name, i2);
+    } else names2.set(slice.name, i2);
   });
   if (run.predictions !== void 0) {
     const p = run.predictions.path;
@@ -50228,9 +52138,7 @@ async function loadRun(path, options = {}) {
     const info2 = logPath === null ? null : await stat2(logPath).catch(() => null);
     if (logPath !== null && info2?.isFile() === true) {
       if (artifact.curves?.epochs !== void 0) {
-        notes.push(
-          `${file}: the artifact has its own curves.epochs; the epoch log ${logName} was not used.`
-        );
+        notes.push({ code: "epoch-log-not-used", file, log: logName });
       } else {
         const text2 = (await readText(logPath, logName, "an epoch log (CSV)")).toString("utf8");
         artifact.curves = {
@@ -50241,9 +52149,7 @@ async function loadRun(path, options = {}) {
         if (issues2.length > 0) throw new InputError(issues2);
       }
     } else {
-      notes.push(
-        `No epoch log ${logName} next to ${file}; the config's epoch-log mapping was not applied to it.`
-      );
+      notes.push({ code: "epoch-log-missing", file, log: logName });
     }
   }
   return { artifact, file, sha256, predictionsPath, notes };
@@ -50285,8 +52191,8 @@ var HashLog = class {
 };
 function parseValue(raw, kind, file, line) {
   const column = kind === "proportion" ? "correct" : "loss";
-  const value = raw.trim() === "" ? Number.NaN : Number(raw);
-  if (kind === "proportion" ? value !== 0 && value !== 1 : !Number.isFinite(value)) {
+  const value2 = raw.trim() === "" ? Number.NaN : Number(raw);
+  if (kind === "proportion" ? value2 !== 0 && value2 !== 1 : !Number.isFinite(value2)) {
     throw new InputError([
       {
         file,
@@ -50296,7 +52202,7 @@ function parseValue(raw, kind, file, line) {
       }
     ]);
   }
-  return value;
+  return value2;
 }
 async function* readRows(path, file, kind, hashes) {
   const stream = createReadStream(path, { encoding: "utf8" });
@@ -50432,7 +52338,7 @@ async function pairPredictions(baseline, candidate, kind) {
 }
 
 // src/io/load-config.ts
-var import__2 = __toESM(require__(), 1);
+var import__3 = __toESM(require__(), 1);
 var import_yaml = __toESM(require_dist2(), 1);
 import { readFile as readFile2 } from "node:fs/promises";
 
@@ -50542,44 +52448,20 @@ var fitgap_config_schema_default = {
   }
 };
 
-// src/model/settings.ts
-var FAIL_ON_VALUES = [
-  "worse-validation",
-  "toward-overfitting",
-  "toward-underfitting",
-  "worse-on-both",
-  "any-movement",
-  "slice-regression",
-  "high-bias",
-  "high-variance",
-  "data-mismatch",
-  "validation-overfit",
-  "none"
-];
-function isFailOn(value) {
-  return FAIL_ON_VALUES.includes(value);
-}
-var DEFAULT_SETTINGS = {
-  alpha: 0.05,
-  minEffect: 0,
-  gapTolerance: 0.1,
-  failOn: ["worse-validation"]
-};
-
 // src/io/load-config.ts
-var compiled2;
+var compiled3;
 function validator2() {
-  compiled2 ??= new import__2.Ajv2020({ allErrors: true, strict: true }).compile(fitgap_config_schema_default);
-  return compiled2;
+  compiled3 ??= new import__3.Ajv2020({ allErrors: true, strict: true }).compile(fitgap_config_schema_default);
+  return compiled3;
 }
 function failOnIssues(values, file, pointer) {
   return values.flatMap(
-    (value, i2) => isFailOn(value) ? [] : [
+    (value2, i2) => isFailOn(value2) ? [] : [
       {
         file,
         pointer: pointer === "" ? "" : `${pointer}/${i2}`,
         expected: `must be one of ${FAIL_ON_VALUES.join(", ")}`,
-        got: quote(value)
+        got: quote(value2)
       }
     ]
   );
@@ -50661,14 +52543,12 @@ async function pairIfBoth(baseline, candidate) {
   const cp = candidate.artifact.predictions;
   if (bp === void 0 || cp === void 0 || baseline.predictionsPath === null || candidate.predictionsPath === null) {
     return {
-      notes: bp !== cp && (bp === void 0 || cp === void 0) ? ["Only one run ships per-example predictions: no paired test."] : []
+      notes: bp !== cp && (bp === void 0 || cp === void 0) ? [{ code: "predictions-in-one-run" }] : []
     };
   }
   if (bp.split !== cp.split) {
     return {
-      notes: [
-        `The predictions are for different splits (${bp.split} vs ${cp.split}): no paired test.`
-      ]
+      notes: [{ code: "predictions-split-mismatch", baseline: bp.split, candidate: cp.split }]
     };
   }
   const result = await pairPredictions(
@@ -50679,9 +52559,12 @@ async function pairIfBoth(baseline, candidate) {
   const notes = [];
   const { unmatched, ...paired } = result;
   if (unmatched.baseline + unmatched.candidate > 0) {
-    notes.push(
-      `Predictions paired by id: ${result.rows} rows in both; ${unmatched.baseline} baseline and ${unmatched.candidate} candidate rows had no partner and were left out of the paired test.`
-    );
+    notes.push({
+      code: "predictions-unmatched",
+      rows: result.rows,
+      baseline: unmatched.baseline,
+      candidate: unmatched.candidate
+    });
   }
   return { paired: { ...paired, split: bp.split }, notes };
 }
@@ -50850,16 +52733,18 @@ async function runReview(deps) {
     if (problem !== null) problems.push(problem);
   }
   if (!review.gate.pass)
-    problems.unshift(`fitgap gate failed:
-${review.gate.reasons.map((r) => `- ${r}`).join("\n")}`);
+    problems.unshift(
+      `fitgap gate failed:
+${gateReasonLines(review, plainText).map((r) => `- ${r}`).join("\n")}`
+    );
   if (problems.length > 0) io.setFailed(problems.join("\n"));
 }
 
 // src/entries/action/settings.ts
 import { tmpdir } from "node:os";
 function optional(name) {
-  const value = getInput(name);
-  return value === "" ? null : value;
+  const value2 = getInput(name);
+  return value2 === "" ? null : value2;
 }
 function required(name, issues2) {
   try {
@@ -50870,22 +52755,22 @@ function required(name, issues2) {
   }
 }
 function oneOf(name, allowed, issues2) {
-  const value = required(name, issues2);
-  if (value === "") return allowed[0];
-  if (allowed.includes(value)) return value;
+  const value2 = required(name, issues2);
+  if (value2 === "") return allowed[0];
+  if (allowed.includes(value2)) return value2;
   issues2.push({
     file: `input "${name}"`,
     pointer: "",
     expected: `must be one of ${allowed.join(", ")}`,
-    got: quote(value)
+    got: quote(value2)
   });
   return allowed[0];
 }
 function number(name, issues2, min, max2) {
   const text2 = optional(name);
   if (text2 === null) return null;
-  const value = Number(text2);
-  if (!Number.isFinite(value) || value < min || value > max2) {
+  const value2 = Number(text2);
+  if (!Number.isFinite(value2) || value2 < min || value2 > max2) {
     issues2.push({
       file: `input "${name}"`,
       pointer: "",
@@ -50894,7 +52779,7 @@ function number(name, issues2, min, max2) {
     });
     return null;
   }
-  return value;
+  return value2;
 }
 function readSettings(env = process.env) {
   const issues2 = [];
@@ -50959,8 +52844,8 @@ function readSettings(env = process.env) {
 }
 function testDelayUnit(env) {
   const text2 = env["FITGAP_TEST_DELAY_UNIT_MS"];
-  const value = text2 === void 0 ? NaN : Number(text2);
-  return Number.isFinite(value) && value >= 0 ? value : 1e3;
+  const value2 = text2 === void 0 ? NaN : Number(text2);
+  return Number.isFinite(value2) && value2 >= 0 ? value2 : 1e3;
 }
 
 // node_modules/@octokit/rest/dist-src/index.js
@@ -51348,11 +53233,11 @@ function createClient(options) {
 }
 
 // src/io/github/context.ts
-function record(value) {
-  return typeof value === "object" && value !== null && !Array.isArray(value) ? value : null;
+function record(value2) {
+  return typeof value2 === "object" && value2 !== null && !Array.isArray(value2) ? value2 : null;
 }
-function text(value) {
-  return typeof value === "string" && value !== "" ? value : null;
+function text(value2) {
+  return typeof value2 === "string" && value2 !== "" ? value2 : null;
 }
 function fullName(repo) {
   return text(record(repo)?.["full_name"]);

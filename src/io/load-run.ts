@@ -9,6 +9,7 @@ import { InputError, type Issue } from '../model/errors.js';
 import type { EpochLogMapping } from '../model/config.js';
 import { parseEpochLog } from '../artifact/epoch-log.js';
 import { parseJson } from '../artifact/read-json.js';
+import type { Note } from '../model/review.js';
 import type { RunArtifact } from '../model/run.js';
 import { semanticIssues, validateRun } from '../validate/run.js';
 
@@ -20,7 +21,7 @@ export interface LoadedRun {
   /** Resolved predictions CSV path, when the artifact names one. */
   predictionsPath: string | null;
   /** What the loader did that the review should mention. */
-  notes: string[];
+  notes: Note[];
 }
 
 async function readText(path: string, file: string, what: string): Promise<Buffer> {
@@ -68,7 +69,7 @@ export async function loadRun(
   const bytes = await readText(path, file, 'a run artifact (JSON)');
   const sha256 = createHash('sha256').update(bytes).digest('hex');
   const artifact = validateRun(parseJson(bytes.toString('utf8'), file), file);
-  const notes: string[] = [];
+  const notes: Note[] = [];
 
   let predictionsPath: string | null = null;
   if (artifact.predictions !== undefined) {
@@ -94,9 +95,7 @@ export async function loadRun(
     const info = logPath === null ? null : await stat(logPath).catch(() => null);
     if (logPath !== null && info?.isFile() === true) {
       if (artifact.curves?.epochs !== undefined) {
-        notes.push(
-          `${file}: the artifact has its own curves.epochs; the epoch log ${logName} was not used.`,
-        );
+        notes.push({ code: 'epoch-log-not-used', file, log: logName });
       } else {
         const text = (await readText(logPath, logName, 'an epoch log (CSV)')).toString('utf8');
         artifact.curves = {
@@ -108,9 +107,7 @@ export async function loadRun(
         if (issues.length > 0) throw new InputError(issues);
       }
     } else {
-      notes.push(
-        `No epoch log ${logName} next to ${file}; the config's epoch-log mapping was not applied to it.`,
-      );
+      notes.push({ code: 'epoch-log-missing', file, log: logName });
     }
   }
   return { artifact, file, sha256, predictionsPath, notes };

@@ -5,9 +5,9 @@
  */
 import { createHash } from 'node:crypto';
 import { dirname, join, resolve } from 'node:path';
-import { buildReview } from '../analysis/review.js';
-import type { PairedPredictions } from '../model/review.js';
-import type { Review, ReviewSettings } from '../model/review.js';
+import { buildReview, type ReviewInput } from '../analysis/review.js';
+import type { Note, PairedPredictions } from '../model/review.js';
+import type { Review } from '../model/review.js';
 import { loadRun, type LoadedRun } from './load-run.js';
 import { pairPredictions } from '../artifact/predictions.js';
 import { loadConfig } from './load-config.js';
@@ -49,7 +49,7 @@ export const DEFAULT_CONFIG_PATH = '.github/fitgap.yml';
 export function resolveSettings(
   config: ConfigFile,
   overrides: SettingsOverrides = {},
-): ReviewSettings & { reference?: number } {
+): ReviewInput['settings'] {
   const reference = overrides.reference ?? config.reference;
   return {
     alpha: overrides.alpha ?? config.alpha ?? DEFAULT_SETTINGS.alpha,
@@ -78,7 +78,7 @@ function sameMetric(baseline: LoadedRun, candidate: LoadedRun): Issue[] {
 async function pairIfBoth(
   baseline: LoadedRun,
   candidate: LoadedRun,
-): Promise<{ paired?: PairedPredictions; notes: string[] }> {
+): Promise<{ paired?: PairedPredictions; notes: Note[] }> {
   const bp = baseline.artifact.predictions;
   const cp = candidate.artifact.predictions;
   if (
@@ -90,15 +90,13 @@ async function pairIfBoth(
     return {
       notes:
         bp !== cp && (bp === undefined || cp === undefined)
-          ? ['Only one run ships per-example predictions: no paired test.']
+          ? [{ code: 'predictions-in-one-run' }]
           : [],
     };
   }
   if (bp.split !== cp.split) {
     return {
-      notes: [
-        `The predictions are for different splits (${bp.split} vs ${cp.split}): no paired test.`,
-      ],
+      notes: [{ code: 'predictions-split-mismatch', baseline: bp.split, candidate: cp.split }],
     };
   }
   const result = await pairPredictions(
@@ -106,12 +104,15 @@ async function pairIfBoth(
     { path: candidate.predictionsPath, file: join(dirname(candidate.file), cp.path) },
     candidate.artifact.metric.kind,
   );
-  const notes: string[] = [];
+  const notes: Note[] = [];
   const { unmatched, ...paired } = result;
   if (unmatched.baseline + unmatched.candidate > 0) {
-    notes.push(
-      `Predictions paired by id: ${result.rows} rows in both; ${unmatched.baseline} baseline and ${unmatched.candidate} candidate rows had no partner and were left out of the paired test.`,
-    );
+    notes.push({
+      code: 'predictions-unmatched',
+      rows: result.rows,
+      baseline: unmatched.baseline,
+      candidate: unmatched.candidate,
+    });
   }
   return { paired: { ...paired, split: bp.split }, notes };
 }

@@ -1,8 +1,7 @@
 /** Statistics layer: pure functions over jStat, no I/O. */
 export { binomialCdf, normalCdf, normalQuantile, tCdf, tQuantile } from './distributions.js';
 export { mean, RunningStats, sampleVariance } from './descriptive.js';
-export { oneSampleT, pairedT, pooledT, welchT } from './t-tests.js';
-export type { PooledTestResult } from './t-tests.js';
+export { oneSampleT, pairedT, welchT } from './t-tests.js';
 export {
   binomialVariance,
   mcnemarExact,

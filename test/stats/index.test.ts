@@ -32,7 +32,6 @@ describe('src/stats public surface', () => {
         'pairedT',
         'pairsNeeded',
         'perExampleSamplingVariance',
-        'pooledT',
         'powerTwoProportions',
         'repeatsNeeded',
         'rowsNeededMcNemar',

@@ -8,6 +8,7 @@ import type { JSONSchemaType } from 'ajv';
 import { InputError } from '../../model/errors.js';
 import type { Issue } from '../../model/errors.js';
 import type { Review } from '../../model/review.js';
+import { isReview, reviewIssues } from '../../validate/review.js';
 
 export const REVIEW_FILE = 'review.json';
 export const PULL_REQUEST_FILE = 'pull-request.json';
@@ -34,93 +35,7 @@ const pullRequestSchema: JSONSchemaType<PullRequestNote> = {
   },
 };
 
-const enumOf = (values: string[]) => ({ type: 'string', enum: values });
-const delta = {
-  type: 'object',
-  required: ['estimate', 'test', 'call'],
-  properties: { estimate: { type: 'number' }, call: enumOf(['up', 'down', 'flat']) },
-};
-/**
- * The parts of a review the publish step reads directly. The renderer reads the rest; a review
- * that breaks it is refused as a whole (see `publish.ts`).
- */
-const reviewSchema = {
-  type: 'object',
-  required: [
-    'format',
-    'movement',
-    'validation',
-    'slices',
-    'settings',
-    'candidate',
-    'baseline',
-    'gate',
-    'metric',
-  ],
-  properties: {
-    format: { const: 'fitgap-review/1' },
-    movement: enumOf([
-      'better-on-both',
-      'away-from-underfitting',
-      'toward-overfitting',
-      'away-from-overfitting',
-      'no-significant-change',
-      'toward-underfitting',
-      'worse-on-both',
-    ]),
-    validation: {
-      type: 'object',
-      required: ['change', 'delta'],
-      properties: { change: enumOf(['better', 'worse', 'flat']), delta },
-    },
-    slices: {
-      type: 'array',
-      items: {
-        type: 'object',
-        required: ['change'],
-        properties: { change: enumOf(['better', 'worse', 'flat']) },
-      },
-    },
-    settings: { type: 'object' },
-    candidate: {
-      type: 'object',
-      required: ['diagnosis', 'components'],
-      properties: {
-        components: {
-          type: 'object',
-          required: ['overfit'],
-          properties: {
-            overfit: {
-              type: 'object',
-              required: ['present'],
-              properties: { present: { type: 'boolean' } },
-            },
-          },
-        },
-        diagnosis: enumOf([
-          'good-fit',
-          'high-bias',
-          'high-variance',
-          'data-mismatch',
-          'high-bias-and-variance',
-        ]),
-      },
-    },
-    baseline: { type: 'object' },
-    metric: { type: 'object', required: ['name', 'goal', 'kind'] },
-    gate: {
-      type: 'object',
-      required: ['pass', 'reasons'],
-      properties: {
-        pass: { type: 'boolean' },
-        reasons: { type: 'array', maxItems: 50, items: { type: 'string', maxLength: 1000 } },
-      },
-    },
-  },
-} as const;
-
 const validatePullRequest = ajv.compile(pullRequestSchema);
-const validateReview = ajv.compile(reviewSchema);
 
 function parse(bytes: Uint8Array, file: string): unknown {
   try {
@@ -132,7 +47,7 @@ function parse(bytes: Uint8Array, file: string): unknown {
   }
 }
 
-function issues(file: string, errors: typeof validateReview.errors): Issue[] {
+function issues(file: string, errors: typeof validatePullRequest.errors): Issue[] {
   return (errors ?? []).map((e) => ({
     file,
     pointer: e.instancePath || '/',
@@ -150,6 +65,8 @@ export function readPullRequestNote(bytes: Uint8Array, label: string): PullReque
 export function readReview(bytes: Uint8Array, label: string): Review {
   const file = `${label} ${REVIEW_FILE}`;
   const doc = parse(bytes, file);
-  if (!validateReview(doc)) throw new InputError(issues(file, validateReview.errors));
-  return doc as unknown as Review;
+  // The whole report must be a valid fitgap-review/1 before anything of it is rendered.
+  const problems = reviewIssues(doc, file);
+  if (problems.length > 0 || !isReview(doc)) throw new InputError(problems);
+  return doc;
 }

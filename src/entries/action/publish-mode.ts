@@ -11,7 +11,10 @@ import type { Issue } from '../../model/errors.js';
 import { downloadArtifact } from '../../io/github/artifacts.js';
 import type { WorkflowRunRef } from '../../io/github/context.js';
 import { listEntries, readEntry } from '../../io/github/zip.js';
+import { plainText } from '../../report/escape.js';
+import { gateReasonLines } from '../../report/gate.js';
 import { renderMarkdown } from '../../report/markdown.js';
+import { isFailOn } from '../../model/settings.js';
 import { PULL_REQUEST_FILE, REVIEW_FILE, readPullRequestNote, readReview } from './bundle.js';
 import type { PublishDeps } from './publish-steps.js';
 import { commentStep, gateCheckStep, setReviewOutputs } from './publish-steps.js';
@@ -37,9 +40,9 @@ export async function runPublish(deps: PublishDeps): Promise<void> {
   const note = readPullRequestNote(files.note, label);
   const untrusted = readReview(files.review, label);
   // The gate policy is the publish workflow's (trusted), applied to the reported outcome.
-  const failOn = settings.failOn ?? untrusted.settings.failOn;
+  const failOn = settings.failOn?.filter(isFailOn) ?? untrusted.settings.failOn;
   const review = { ...untrusted, settings: { ...untrusted.settings, failOn } };
-  review.gate = applyGate(review);
+  review.gate = applyGate(review, failOn);
   const fullName = `${context.repo.owner}/${context.repo.repo}`;
   if (note.repository !== fullName || note.headSha !== run.headSha) {
     refuse({
@@ -92,7 +95,9 @@ export async function runPublish(deps: PublishDeps): Promise<void> {
     if (problem !== null) problems.push(problem);
   }
   if (!review.gate.pass)
-    io.info(`Gate failed (published on ${run.headSha}): ${review.gate.reasons.join('; ')}`);
+    io.info(
+      `Gate failed (published on ${run.headSha}): ${gateReasonLines(review, plainText).join('; ')}`,
+    );
   if (problems.length > 0) io.setFailed(problems.join('\n'));
 }
 

@@ -4,6 +4,8 @@
  */
 import type { Review } from '../../model/review.js';
 import { publishGate } from '../../io/github/check.js';
+import { escapeInline } from '../../report/escape.js';
+import { gateReasonLines } from '../../report/gate.js';
 import type { GitHubClient } from '../../io/github/client.js';
 import { publishComment } from '../../io/github/comment.js';
 import type { RunContext } from '../../io/github/context.js';
@@ -102,7 +104,7 @@ export async function gateCheckStep(
       pass: review.gate.pass,
       title: `${review.movement}; validation ${review.validation.change}`,
       summary: body,
-      reasons: review.gate.reasons,
+      reasons: gateReasonLines(review, escapeInline),
       detailsUrl: runUrl(context),
     });
     io.info(

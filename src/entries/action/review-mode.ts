@@ -3,6 +3,8 @@
  * JSON report, outputs, comment, gate. The gate is applied even when commenting fails.
  */
 import { basename, isAbsolute, join, relative, resolve } from 'node:path';
+import { plainText } from '../../report/escape.js';
+import { gateReasonLines } from '../../report/gate.js';
 import { renderMarkdown } from '../../report/markdown.js';
 import { reviewFiles } from '../../io/review-from-files.js';
 import type { SettingsOverrides } from '../../io/review-from-files.js';
@@ -72,6 +74,10 @@ export async function runReview(deps: PublishDeps): Promise<void> {
     if (problem !== null) problems.push(problem);
   }
   if (!review.gate.pass)
-    problems.unshift(`fitgap gate failed:\n${review.gate.reasons.map((r) => `- ${r}`).join('\n')}`);
+    problems.unshift(
+      `fitgap gate failed:\n${gateReasonLines(review, plainText)
+        .map((r) => `- ${r}`)
+        .join('\n')}`,
+    );
   if (problems.length > 0) io.setFailed(problems.join('\n'));
 }
