@@ -2,7 +2,7 @@
  * Cost of the candidate relative to the baseline: ratio per field, with a Welch-on-logs interval
  * where both runs give per-repeat values (src/stats/ratio.ts). Pure.
  */
-import type { CostChange } from '../model/guardrails.js';
+import type { CostChange, CostReview } from '../model/guardrails.js';
 import { COST_FIELDS, type Cost, type RunArtifact } from '../model/run.js';
 import { logRatio } from '../stats/index.js';
 
@@ -13,8 +13,8 @@ export function reviewCost(
   baseline: RunArtifact,
   candidate: RunArtifact,
   alpha: number,
-): CostChange[] {
-  const out: CostChange[] = [];
+): CostReview {
+  const out: CostReview = {};
   for (const field of COST_FIELDS) {
     const b = asList(baseline.cost?.[field]);
     const c = asList(candidate.cost?.[field]);
@@ -31,15 +31,14 @@ export function reviewCost(
     if (r.p !== null) call = r.p < alpha ? (r.ratio > 1 ? 'up' : 'down') : 'flat';
     else if (single) call = r.ratio > 1 ? 'up' : r.ratio < 1 ? 'down' : 'flat';
     else call = 'undetermined';
-    out.push({
-      field,
+    out[field] = {
       baseline: geometric(b),
       candidate: geometric(c),
       ratio: r.ratio,
       ci: r.ci,
       p: r.p,
       call,
-    });
+    };
   }
   return out;
 }

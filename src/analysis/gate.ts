@@ -1,7 +1,25 @@
 /** The gate (`fail-on`): which outcomes fail the required status check. Pure. */
 import type { FailOn, Gate, GateReason, Review } from '../model/review.js';
+import { COST_OUTCOME_FIELDS, COST_RATIO_OUTCOME } from '../model/settings.js';
 
-type Outcome = Pick<Review, 'movement' | 'validation' | 'slices' | 'candidate'>;
+type Outcome = Pick<Review, 'movement' | 'validation' | 'slices' | 'candidate'> &
+  Partial<Pick<Review, 'guardrails' | 'cost'>>;
+
+function guardrailsWith(r: Outcome, call: 'inferior' | 'undetermined'): string[] {
+  return (r.guardrails ?? []).filter((g) => g.nonInferiority === call).map((g) => g.name);
+}
+
+/** `FIELD-ratio>X` fires when the cost ratio's estimate exceeds X. */
+function costRule(policy: string): ((r: Outcome) => GateReason | null) | undefined {
+  const match = COST_RATIO_OUTCOME.exec(policy);
+  if (match === null) return undefined;
+  const field = COST_OUTCOME_FIELDS.get(match[1] as 'train-seconds');
+  const limit = Number(match[2]);
+  return (r) => {
+    const ratio = field === undefined ? undefined : r.cost?.[field]?.ratio;
+    return ratio !== undefined && ratio > limit ? { outcome: policy, ratio } : null;
+  };
+}
 
 /** Each outcome's test: the reason it fired, or null. `none` never fires. */
 const RULES = new Map<FailOn, (r: Outcome) => GateReason | null>([
@@ -42,6 +60,20 @@ const RULES = new Map<FailOn, (r: Outcome) => GateReason | null>([
     'validation-overfit',
     (r) => fired(r.candidate.components.overfit.present, 'validation-overfit'),
   ],
+  [
+    'guardrail-regression',
+    (r) => {
+      const names = guardrailsWith(r, 'inferior');
+      return names.length > 0 ? { outcome: 'guardrail-regression', guardrails: names } : null;
+    },
+  ],
+  [
+    'guardrail-undetermined',
+    (r) => {
+      const names = guardrailsWith(r, 'undetermined');
+      return names.length > 0 ? { outcome: 'guardrail-undetermined', guardrails: names } : null;
+    },
+  ],
   ['none', () => null],
 ]);
 
@@ -53,7 +85,8 @@ function fired(condition: boolean, outcome: FailOn): GateReason | null {
 export function applyGate(review: Outcome, failOn: readonly FailOn[]): Gate {
   const reasons: GateReason[] = [];
   for (const policy of failOn) {
-    const reason = RULES.get(policy)?.(review) ?? null;
+    const rule = RULES.get(policy) ?? costRule(policy);
+    const reason = rule?.(review) ?? null;
     if (reason !== null) reasons.push(reason);
   }
   return { pass: reasons.length === 0, reasons, failOn: [...failOn] };

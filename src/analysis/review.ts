@@ -19,7 +19,9 @@ import {
   splitShortfalls,
   type ComponentChanges,
 } from './changes.js';
+import { reviewCost } from './cost.js';
 import { applyGate } from './gate.js';
+import { reviewGuardrails } from './guardrails.js';
 import { diffHyperparameters, pulledLevers } from './hyperparameters.js';
 import { chooseLevers } from './levers/choose.js';
 import { shortfallSign } from './measure.js';
@@ -32,7 +34,12 @@ export interface ReviewInput {
   baseline: RunArtifact;
   candidate: RunArtifact;
   /** `failOn` holds validated outcomes; an unknown one is a bug in the caller. */
-  settings: Omit<ReviewSettings, 'failOn'> & { failOn: readonly string[]; reference?: number };
+  settings: Omit<ReviewSettings, 'failOn'> & {
+    failOn: readonly string[];
+    reference?: number;
+    /** Guardrail margins from the trusted config, by guardrail name. */
+    guardrailMargins?: ReadonlyMap<string, number>;
+  };
   paired?: PairedPredictions;
   /** Notes from loading (files not used, rows without a partner…). */
   notes?: Note[];
@@ -108,8 +115,26 @@ export function buildReview(input: ReviewInput): Review {
     regularization: regularizationOf(candidate),
     noiseUnknown,
   });
+  const hasGuardrails = baseline.guardrails !== undefined || candidate.guardrails !== undefined;
+  const guardrails = hasGuardrails
+    ? reviewGuardrails(baseline, candidate, {
+        alpha: settings.alpha,
+        margins: input.settings.guardrailMargins ?? new Map(),
+      })
+    : undefined;
+  const cost =
+    baseline.cost !== undefined || candidate.cost !== undefined
+      ? reviewCost(baseline, candidate, settings.alpha)
+      : undefined;
   const gate = applyGate(
-    { movement, validation, slices: sliceResult.slices, candidate: cand },
+    {
+      movement,
+      validation,
+      slices: sliceResult.slices,
+      candidate: cand,
+      ...(guardrails === undefined ? {} : { guardrails }),
+      ...(cost === undefined ? {} : { cost }),
+    },
     settings.failOn,
   );
 
@@ -131,6 +156,8 @@ export function buildReview(input: ReviewInput): Review {
     levers,
     nonLevers,
     gate,
+    ...(guardrails === undefined ? {} : { guardrails }),
+    ...(cost === undefined ? {} : { cost }),
     notes: [
       ...(input.notes ?? []),
       ...reviewNotes({

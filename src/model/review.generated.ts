@@ -1,20 +1,25 @@
 /* Generated from schema/fitgap-review-1.schema.json by scripts/review-types.mjs: do not edit; run `npm run schema:types`. */
 
 /**
- * An outcome the gate can fail on (`fail-on`).
+ * An outcome the gate can fail on (`fail-on`). A cost outcome `FIELD-ratio>X` (`train-seconds`, `inference-ms`, `parameters`, `memory-mb`) fires when candidate / baseline of that cost exceeds X.
  */
 export type FailOn =
-  | 'worse-validation'
-  | 'toward-overfitting'
-  | 'toward-underfitting'
-  | 'worse-on-both'
-  | 'any-movement'
-  | 'slice-regression'
-  | 'high-bias'
-  | 'high-variance'
-  | 'data-mismatch'
-  | 'validation-overfit'
-  | 'none';
+  | (
+      | 'worse-validation'
+      | 'toward-overfitting'
+      | 'toward-underfitting'
+      | 'worse-on-both'
+      | 'any-movement'
+      | 'slice-regression'
+      | 'high-bias'
+      | 'high-variance'
+      | 'data-mismatch'
+      | 'validation-overfit'
+      | 'guardrail-regression'
+      | 'guardrail-undetermined'
+      | 'none'
+    )
+  | string;
 /**
  * How the change moved the model in the bias/variance plane, from the calls on Δbias and Δvariance.
  */
@@ -111,6 +116,16 @@ export type Note =
   | PredictionsUnmatchedNote
   | EpochLogNotUsedNote
   | EpochLogMissingNote;
+/**
+ * What kept a guardrail from a full review.
+ */
+export type GuardrailProblem =
+  | 'missing-in-baseline'
+  | 'missing-in-candidate'
+  | 'metric-differs'
+  | 'noise-unknown'
+  | 'no-margin'
+  | 'candidate-margin-ignored';
 
 /**
  * A fitgap review, format fitgap-review/1: codes, numbers and artifact strings (no sentences; the report writes those).
@@ -158,6 +173,19 @@ export interface Review {
   gate: Gate;
   notes: Note[];
   paired: PairedSummary | null;
+  /**
+   * Guardrail metrics of either run, candidate's order first. Absent in reports of runs without guardrails.
+   */
+  guardrails?: GuardrailReview[];
+  /**
+   * Cost figures that both runs give, by field. Absent when neither run gives cost.
+   */
+  cost?: {
+    trainSeconds?: CostChange;
+    inferenceMs?: CostChange;
+    parameters?: CostChange;
+    memoryMb?: CostChange;
+  };
 }
 /**
  * The settings the review was made with.
@@ -613,6 +641,14 @@ export interface GateReason {
    * Slices that regressed (slice-regression).
    */
   slices?: number;
+  /**
+   * Guardrails that fired (guardrail-regression, guardrail-undetermined).
+   */
+  guardrails?: string[];
+  /**
+   * The cost ratio that exceeded its limit (FIELD-ratio>X).
+   */
+  ratio?: number;
 }
 /**
  * Only one run has a train_dev split: the variance change is measured as validation − train in both.
@@ -709,4 +745,43 @@ export interface PairedSummary {
     baselineOnly: number;
     candidateOnly: number;
   };
+}
+/**
+ * One guardrail metric: its change and its non-inferiority call against the margin (confidence-interval approach, ICH E9 §3.3.2; Holm across guardrails).
+ */
+export interface GuardrailReview {
+  name: string;
+  goal: 'minimize' | 'maximize';
+  kind: 'proportion' | 'continuous';
+  unit: string | null;
+  baseline: number | null;
+  candidate: number | null;
+  change: GuardrailChange | null;
+  margin: number | null;
+  marginSource: ('config' | 'baseline' | 'candidate') | null;
+  worseningBounds: Interval | null;
+  pNonInferior: number | null;
+  nonInferiority: ('non-inferior' | 'inferior' | 'undetermined') | null;
+  problems: GuardrailProblem[];
+}
+/**
+ * Change of a guardrail, candidate − baseline, in the metric's own units; the call is in the metric's direction.
+ */
+export interface GuardrailChange {
+  estimate: number;
+  ci: Interval | null;
+  p: number | null;
+  test: TestName;
+  call: 'better' | 'worse' | 'flat' | 'undetermined';
+}
+/**
+ * A cost figure of both runs: candidate / baseline with its interval (Welch on logarithms) where per-repeat values allow.
+ */
+export interface CostChange {
+  baseline: number;
+  candidate: number;
+  ratio: number;
+  ci: Interval | null;
+  p: number | null;
+  call: 'up' | 'down' | 'flat' | 'undetermined';
 }

@@ -122,20 +122,56 @@ describe('cost', () => {
   it('per-repeat seconds give a ratio with an interval; a parameter count is exact', () => {
     const b = { ...base, cost: { trainSeconds: [100, 104, 98], parameters: 1000 } };
     const c = { ...base, cost: { trainSeconds: [240, 250, 236], parameters: 1000 } };
-    const [seconds, parameters] = reviewCost(b, c, 0.05);
-    expect(seconds).toMatchObject({ field: 'trainSeconds', call: 'up' });
+    const { trainSeconds: seconds, parameters } = reviewCost(b, c, 0.05);
+    expect(seconds).toMatchObject({ call: 'up' });
     expect(seconds?.ratio).toBeCloseTo(2.4, 1);
     expect(seconds?.ci?.[0]).toBeGreaterThan(2);
-    expect(parameters).toMatchObject({ field: 'parameters', ratio: 1, ci: null, call: 'flat' });
+    expect(parameters).toMatchObject({ ratio: 1, ci: null, call: 'flat' });
   });
 
   it('a timing measured once per run is undetermined', () => {
     const b = { ...base, cost: { trainSeconds: [100] } };
     const c = { ...base, cost: { trainSeconds: [130] } };
-    expect(reviewCost(b, c, 0.05)[0]?.call).toBe('undetermined');
+    expect(reviewCost(b, c, 0.05).trainSeconds?.call).toBe('undetermined');
   });
 
   it('fields on one side only are left out', () => {
-    expect(reviewCost({ ...base, cost: { memoryMb: 10 } }, base, 0.05)).toEqual([]);
+    expect(reviewCost({ ...base, cost: { memoryMb: 10 } }, base, 0.05)).toEqual({});
+  });
+});
+
+describe('fail-on outcomes', () => {
+  it('the review schema and the settings list name the same outcomes', async () => {
+    const { FAIL_ON_VALUES } = await import('../../src/model/settings.js');
+    const schema = (await import('../../schema/fitgap-review-1.schema.json', {
+      with: { type: 'json' },
+    })) as unknown as { default: { $defs: { failOn: { anyOf: [{ enum: string[] }] } } } };
+    expect([...schema.default.$defs.failOn.anyOf[0].enum].sort()).toEqual(
+      [...FAIL_ON_VALUES].sort(),
+    );
+  });
+
+  it('guardrail and cost outcomes fire on the review', async () => {
+    const { applyGate } = await import('../../src/analysis/gate.js');
+    const { buildReview } = await import('../../src/analysis/review.js');
+    const { SETTINGS } = await import('./make-run.js');
+    const b = withGuardrails(base, [ece([0.03, 0.031, 0.029], 0.01)], {
+      trainSeconds: [100, 102, 98],
+    });
+    const c = withGuardrails(base, [ece([0.06, 0.061, 0.059])], { trainSeconds: [240, 245, 238] });
+    const review = buildReview({
+      baseline: b,
+      candidate: c,
+      settings: {
+        ...SETTINGS,
+        failOn: ['guardrail-regression', 'train-seconds-ratio>2', 'inference-ms-ratio>1'],
+      },
+    });
+    expect(review.gate.pass).toBe(false);
+    expect(review.gate.reasons).toEqual([
+      { outcome: 'guardrail-regression', guardrails: ['calibration_error'] },
+      { outcome: 'train-seconds-ratio>2', ratio: review.cost?.trainSeconds?.ratio },
+    ]);
+    expect(applyGate(review, ['train-seconds-ratio>3']).pass).toBe(true);
   });
 });
