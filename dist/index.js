@@ -32393,9 +32393,9 @@ ${indent}${start}${value2}${end}`;
       const str = value2.replace(/\n+/g, `$&
 ${indent}`);
       if (actualString) {
-        const test = (tag) => tag.default && tag.tag !== "tag:yaml.org,2002:str" && tag.test?.test(str);
+        const test2 = (tag) => tag.default && tag.tag !== "tag:yaml.org,2002:str" && tag.test?.test(str);
         const { compat, tags } = ctx.doc.schema;
-        if (tags.some(test) || compat?.some(test))
+        if (tags.some(test2) || compat?.some(test2))
           return quotedString(value2, ctx);
       }
       return implicitKey ? str : foldFlowLines.foldFlowLines(str, indent, foldFlowLines.FOLD_FLOW, getFoldOptions(ctx, false));
@@ -37322,10 +37322,10 @@ var require_lexer = __commonJS({
         }
         return n;
       }
-      *pushUntil(test) {
+      *pushUntil(test2) {
         let i2 = this.pos;
         let ch = this.buffer[i2];
-        while (!test(ch))
+        while (!test2(ch))
           ch = this.buffer[++i2];
         return yield* this.pushToIndex(i2, false);
       }
@@ -45369,7 +45369,53 @@ function coreIO() {
   };
 }
 
+// src/model/settings.ts
+var FAIL_ON_VALUES = [
+  "worse-validation",
+  "toward-overfitting",
+  "toward-underfitting",
+  "worse-on-both",
+  "any-movement",
+  "slice-regression",
+  "high-bias",
+  "high-variance",
+  "data-mismatch",
+  "validation-overfit",
+  "guardrail-regression",
+  "guardrail-undetermined",
+  "none"
+];
+var COST_OUTCOME_FIELDS = /* @__PURE__ */ new Map([
+  ["train-seconds", "trainSeconds"],
+  ["inference-ms", "inferenceMs"],
+  ["parameters", "parameters"],
+  ["memory-mb", "memoryMb"]
+]);
+var COST_RATIO_OUTCOME = /^(train-seconds|inference-ms|parameters|memory-mb)-ratio>((?:0|[1-9][0-9]*)(?:\.[0-9]+)?)$/;
+function isFailOn(value2) {
+  return FAIL_ON_VALUES.includes(value2) || COST_RATIO_OUTCOME.test(value2);
+}
+var DEFAULT_SETTINGS = {
+  alpha: 0.05,
+  minEffect: 0,
+  gapTolerance: 0.1,
+  failOn: ["worse-validation"]
+};
+
 // src/analysis/gate.ts
+function guardrailsWith(r, call) {
+  return (r.guardrails ?? []).filter((g) => g.nonInferiority === call).map((g) => g.name);
+}
+function costRule(policy) {
+  const match = COST_RATIO_OUTCOME.exec(policy);
+  if (match === null) return void 0;
+  const field = COST_OUTCOME_FIELDS.get(match[1]);
+  const limit = Number(match[2]);
+  return (r) => {
+    const ratio2 = field === void 0 ? void 0 : r.cost?.[field]?.ratio;
+    return ratio2 !== void 0 && ratio2 > limit ? { outcome: policy, ratio: ratio2 } : null;
+  };
+}
 var RULES = /* @__PURE__ */ new Map([
   ["worse-validation", (r) => fired(r.validation.change === "worse", "worse-validation")],
   ["toward-overfitting", (r) => fired(r.movement === "toward-overfitting", "toward-overfitting")],
@@ -45405,6 +45451,20 @@ var RULES = /* @__PURE__ */ new Map([
     "validation-overfit",
     (r) => fired(r.candidate.components.overfit.present, "validation-overfit")
   ],
+  [
+    "guardrail-regression",
+    (r) => {
+      const names2 = guardrailsWith(r, "inferior");
+      return names2.length > 0 ? { outcome: "guardrail-regression", guardrails: names2 } : null;
+    }
+  ],
+  [
+    "guardrail-undetermined",
+    (r) => {
+      const names2 = guardrailsWith(r, "undetermined");
+      return names2.length > 0 ? { outcome: "guardrail-undetermined", guardrails: names2 } : null;
+    }
+  ],
   ["none", () => null]
 ]);
 function fired(condition, outcome) {
@@ -45413,7 +45473,8 @@ function fired(condition, outcome) {
 function applyGate(review, failOn) {
   const reasons = [];
   for (const policy of failOn) {
-    const reason = RULES.get(policy)?.(review) ?? null;
+    const rule = RULES.get(policy) ?? costRule(policy);
+    const reason = rule?.(review) ?? null;
     if (reason !== null) reasons.push(reason);
   }
   return { pass: reasons.length === 0, reasons, failOn: [...failOn] };
@@ -46124,12 +46185,16 @@ var MINUS = "\u2212";
 var SIGNIFICANT = 4;
 var MAX_DECIMALS = 6;
 function numberFormatFor(review) {
+  return formatForValues(
+    review.metric.kind,
+    review.splits.flatMap((s) => [s.baseline, s.candidate])
+  );
+}
+function formatForValues(kind, values) {
   let largest = 0;
-  for (const change2 of review.splits) {
-    largest = Math.max(largest, Math.abs(change2.baseline), Math.abs(change2.candidate));
-  }
+  for (const v of values) largest = Math.max(largest, Math.abs(v));
   const decimals = largest === 0 || !Number.isFinite(largest) ? SIGNIFICANT : Math.min(MAX_DECIMALS, Math.max(0, SIGNIFICANT - 1 - Math.floor(Math.log10(largest))));
-  return { kind: review.metric.kind, decimals };
+  return { kind, decimals };
 }
 function digits(v, f) {
   const proportion = f.kind === "proportion";
@@ -46343,6 +46408,11 @@ function reasonSentence(reason, review, esc) {
     const n = reason.slices ?? 0;
     return `${count(n)} ${n === 1 ? "slice" : "slices"} regressed significantly`;
   }
+  if (reason.outcome === "guardrail-regression" || reason.outcome === "guardrail-undetermined") {
+    const names2 = (reason.guardrails ?? []).map((n) => esc(n, 60)).join(", ");
+    return reason.outcome === "guardrail-regression" ? `guardrail worse beyond its margin (${names2})` : `cannot tell whether a guardrail stays within its margin (${names2})`;
+  }
+  if (reason.ratio !== void 0) return `the cost ratio is \xD7${fixed(reason.ratio, 2)}`;
   return OUTCOME_SENTENCE.get(reason.outcome) ?? "fired";
 }
 function gateReasonLines(review, esc) {
@@ -46500,6 +46570,105 @@ function toAlignment(value2) {
   return code === 67 || code === 99 ? 99 : code === 76 || code === 108 ? 108 : code === 82 || code === 114 ? 114 : 0;
 }
 
+// src/report/guardrails.ts
+var COST_WORDS = /* @__PURE__ */ new Map([
+  ["trainSeconds", { noun: "training time", unit: " s" }],
+  ["inferenceMs", { noun: "inference latency", unit: " ms" }],
+  ["parameters", { noun: "parameters", unit: "" }],
+  ["memoryMb", { noun: "memory", unit: " MB" }]
+]);
+var NON_INFERIORITY_WORD = /* @__PURE__ */ new Map([
+  ["non-inferior", "within margin"],
+  ["inferior", "beyond margin"],
+  ["undetermined", "cannot tell, margin"]
+]);
+var CHANGE_WORD = /* @__PURE__ */ new Map([
+  ["better", "better"],
+  ["worse", "worse"],
+  ["flat", "no change beyond noise"],
+  ["undetermined", "noise unknown"]
+]);
+var COST_CALL_WORD = /* @__PURE__ */ new Map([
+  ["up", "up"],
+  ["down", "down"],
+  ["flat", "no change beyond noise"],
+  ["undetermined", "noise unknown"]
+]);
+var word = (table2, code, esc) => table2.get(code) ?? esc(code, 40);
+function formatOf(g) {
+  const values = [g.baseline, g.candidate].filter((v) => v !== null);
+  return formatForValues(g.kind, values);
+}
+function withUnit(text2, g, esc) {
+  return g.unit === null || g.kind === "proportion" ? text2 : `${text2} ${esc(g.unit, 20)}`;
+}
+function guardrailVerdict(g, esc, margin) {
+  if (g.problems.includes("missing-in-baseline")) return "not in the baseline";
+  if (g.problems.includes("missing-in-candidate")) return "not in the candidate";
+  if (g.problems.includes("metric-differs")) return "metric differs between the runs";
+  const changeWord = g.change === null ? "" : word(CHANGE_WORD, g.change.call, esc);
+  if (g.nonInferiority === null) return `${changeWord}; no margin, not gated`;
+  return `${word(NON_INFERIORITY_WORD, g.nonInferiority, esc)} ${margin}`;
+}
+function ratio(v) {
+  return `\xD7${fixed(v, v >= 10 ? 1 : 2)}`;
+}
+function costCell(v, field) {
+  return `${short(v)}${COST_WORDS.get(field)?.unit ?? ""}`;
+}
+function guardrailsTable(review, esc, level, compact = false) {
+  const rows = [];
+  for (const g of review.guardrails ?? []) {
+    const f = formatOf(g);
+    const margin = g.margin === null ? "\u2014" : withUnit(amount(g.margin, f), g, esc);
+    rows.push([
+      esc(g.name, 60),
+      g.baseline === null ? "\u2014" : withUnit(value(g.baseline, f), g, esc),
+      g.candidate === null ? "\u2014" : withUnit(value(g.candidate, f), g, esc),
+      g.change === null ? "\u2014" : compact ? change(g.change.estimate, f) : `${change(g.change.estimate, f)} ${changeInterval(g.change.ci, f)}`,
+      guardrailVerdict(g, esc, margin)
+    ]);
+  }
+  for (const [field, words2] of COST_WORDS) {
+    const c = review.cost?.[field];
+    if (c === void 0) continue;
+    const interval = c.ci === null ? "" : ` [${fixed(c.ci[0], 2)}, ${fixed(c.ci[1], 2)}]`;
+    rows.push([
+      words2.noun,
+      costCell(c.baseline, field),
+      costCell(c.candidate, field),
+      `${ratio(c.ratio)}${interval}`,
+      word(COST_CALL_WORD, c.call, esc)
+    ]);
+  }
+  if (rows.length === 0) return null;
+  return {
+    header: [
+      compact ? "Guardrail" : "Guardrail or cost",
+      "Baseline",
+      "Candidate",
+      compact ? "\u0394" : `\u0394 [${level}% interval]`,
+      "Verdict"
+    ],
+    align: ["l", "r", "r", "r", "l"],
+    rows,
+    units: null
+  };
+}
+function tradeOffPhrase(review, esc) {
+  const moved = [...COST_WORDS].filter(([field]) => {
+    const call = review.cost?.[field]?.call;
+    return call === "up" || call === "down";
+  });
+  if (moved.length === 0) return null;
+  const f = numberFormatFor(review);
+  const costs = moved.map(([field, words2]) => `${ratio(review.cost?.[field]?.ratio ?? 1)} ${words2.noun}`).join(" and ");
+  return `${change(review.validation.delta.estimate, f)} ${esc(review.metric.name, 60)} for ${costs}`;
+}
+function guardrailNames(review, call) {
+  return (review.guardrails ?? []).filter((g) => g.nonInferiority === call).map((g) => g.name);
+}
+
 // src/report/levers.ts
 function leverText(lever, review, f, esc) {
   const ctx = { review, f, esc };
@@ -46523,9 +46692,9 @@ function evidenceSentence(e, id, ctx) {
     case "pr-change":
       return `This PR ${e.direction === "raised" ? "raised" : "lowered"} ${esc(e.hyperparameter, 60)} ${fromTo(e)}.`;
     case "component-change": {
-      const word = e.delta.call === "up" ? "rose" : e.delta.call === "down" ? "fell" : "held steady";
+      const word2 = e.delta.call === "up" ? "rose" : e.delta.call === "down" ? "fell" : "held steady";
       const toward = e.delta.call !== "up" ? "" : e.component === "bias" ? ": the model moved toward underfitting" : ": the model moved toward overfitting";
-      return `${say(COMPONENT_TITLE, e.component, esc)} ${word} (${change(e.delta.estimate, f)}, ${pText(e.delta.p)})${toward}.`;
+      return `${say(COMPONENT_TITLE, e.component, esc)} ${word2} (${change(e.delta.estimate, f)}, ${pText(e.delta.p)})${toward}.`;
     }
     case "already-pulled":
       return `This PR already ${e.direction === "raised" ? "raised" : "lowered"} ${esc(e.hyperparameter, 60)} (${fromTo(e)}): judge its effect before pulling further.`;
@@ -46720,14 +46889,28 @@ function hyperparameterTable(review, esc) {
 function changePhrase(name, delta, review, f) {
   if (delta === null) return `${name} unknown`;
   const stats = delta.ci === null ? `${change(delta.estimate, f)}, noise unknown` : `${change(delta.estimate, f)}, ${levelPercent(review)}% interval ${changeInterval(delta.ci, f)}, ${pText(delta.p)}`;
-  const word = delta.call === "up" ? "rose" : delta.call === "down" ? "fell" : "held steady";
-  return `${name} ${word} (${stats})`;
+  const word2 = delta.call === "up" ? "rose" : delta.call === "down" ? "fell" : "held steady";
+  return `${name} ${word2} (${stats})`;
 }
 var GOOD_MOVEMENTS = /* @__PURE__ */ new Set([
   "better-on-both",
   "away-from-overfitting",
   "away-from-underfitting"
 ]);
+function guardrailLines(review, esc) {
+  const lines = [];
+  const tradeOff = tradeOffPhrase(review, esc);
+  if (tradeOff !== null) lines.push({ label: "Trade-off", text: `${tradeOff}.`, tone: "neutral" });
+  const inferior = guardrailNames(review, "inferior");
+  if (inferior.length > 0) {
+    lines.push({
+      label: `${inferior.length === 1 ? "Guardrail" : "Guardrails"} regressed beyond the margin`,
+      text: `${inferior.map((n) => esc(n, 60)).join(", ")}.`,
+      tone: "bad"
+    });
+  }
+  return lines;
+}
 function buildHeadline(review, esc) {
   const f = numberFormatFor(review);
   const metric = esc(review.metric.name, 60);
@@ -46757,6 +46940,7 @@ function buildHeadline(review, esc) {
       text: `${from}(\u0394 ${vStats}).`,
       tone: vTone
     },
+    ...guardrailLines(review, esc),
     {
       label: review.gate.pass ? "Gate passed" : "Gate failed",
       text: gateSentence(review, esc),
@@ -47106,8 +47290,18 @@ function methodNotes(review, esc) {
   use("validation overfit", review.overfit.delta);
   for (const split of review.splits) use(`${say(SPLIT_WORD, split.split, esc)} split`, split.delta);
   for (const slice of review.slices) use("slices", slice.delta);
-  for (const [test, what] of uses) {
-    lines.push(`${[...new Set(what)].join(", ")}: ${say(TEST_WHY, test, esc)}`);
+  for (const [test2, what] of uses) {
+    lines.push(`${[...new Set(what)].join(", ")}: ${say(TEST_WHY, test2, esc)}`);
+  }
+  if ((review.guardrails ?? []).some((g) => g.margin !== null)) {
+    lines.push(
+      `Guardrails: a guardrail is within its margin when the one-sided ${levelPercent(review)}% upper confidence bound of its worsening is below the margin, beyond it when the lower bound is above the margin, and undetermined otherwise (the confidence-interval approach to non-inferiority, ICH E9 \xA73.3.2 and E10; Wellek 2010). The one-sided p-values are Holm-adjusted across guardrails; the primary verdict is not adjusted by them. A margin from the config wins over the artifacts', the baseline's over the candidate's.`
+    );
+  }
+  if (review.cost !== void 0 && Object.keys(review.cost).length > 0) {
+    lines.push(
+      "Cost ratios are candidate / baseline; with per-repeat values the interval comes from Welch's t-test on the logarithms (a ratio of geometric means). A single figure (parameters, memory) changes exactly as given; a timing taken once per run has unknown noise."
+    );
   }
   if (review.slices.length > 0) {
     lines.push(
@@ -47268,6 +47462,8 @@ function headlineBlock(review) {
 }
 function compose(review, { marker, files, charts }, d) {
   const out = [marker, ...headlineBlock(review)];
+  const guards = guardrailsTable(review, escapeInline, levelPercent(review));
+  if (guards !== null) out.push("### Guardrails and cost", "", table(guards), "");
   out.push("### Splits", "", table(splitsTable(review, escapeInline)), "");
   out.push("### Error decomposition", "", table(decompositionTable(review, escapeInline)), "");
   const missing = unavailableNotes(review, escapeInline);
@@ -47346,30 +47542,6 @@ function compose(review, { marker, files, charts }, d) {
   out.push(`_${CAUTION}_`, "");
   return out.join("\n");
 }
-
-// src/model/settings.ts
-var FAIL_ON_VALUES = [
-  "worse-validation",
-  "toward-overfitting",
-  "toward-underfitting",
-  "worse-on-both",
-  "any-movement",
-  "slice-regression",
-  "high-bias",
-  "high-variance",
-  "data-mismatch",
-  "validation-overfit",
-  "none"
-];
-function isFailOn(value2) {
-  return FAIL_ON_VALUES.includes(value2);
-}
-var DEFAULT_SETTINGS = {
-  alpha: 0.05,
-  minEffect: 0,
-  gapTolerance: 0.1,
-  failOn: ["worse-validation"]
-};
 
 // src/entries/action/bundle.ts
 var import_ajv = __toESM(require_ajv(), 1);
@@ -47613,6 +47785,32 @@ var fitgap_review_1_schema_default = {
           type: "null"
         }
       ]
+    },
+    guardrails: {
+      description: "Guardrail metrics of either run, candidate's order first. Absent in reports of runs without guardrails.",
+      type: "array",
+      items: {
+        $ref: "#/$defs/guardrailReview"
+      }
+    },
+    cost: {
+      description: "Cost figures that both runs give, by field. Absent when neither run gives cost.",
+      type: "object",
+      additionalProperties: false,
+      properties: {
+        trainSeconds: {
+          $ref: "#/$defs/costChange"
+        },
+        inferenceMs: {
+          $ref: "#/$defs/costChange"
+        },
+        parameters: {
+          $ref: "#/$defs/costChange"
+        },
+        memoryMb: {
+          $ref: "#/$defs/costChange"
+        }
+      }
     }
   },
   $defs: {
@@ -47751,19 +47949,29 @@ var fitgap_review_1_schema_default = {
     },
     failOn: {
       title: "FailOn",
-      description: "An outcome the gate can fail on (`fail-on`).",
-      enum: [
-        "worse-validation",
-        "toward-overfitting",
-        "toward-underfitting",
-        "worse-on-both",
-        "any-movement",
-        "slice-regression",
-        "high-bias",
-        "high-variance",
-        "data-mismatch",
-        "validation-overfit",
-        "none"
+      description: "An outcome the gate can fail on (`fail-on`). A cost outcome `FIELD-ratio>X` (`train-seconds`, `inference-ms`, `parameters`, `memory-mb`) fires when candidate / baseline of that cost exceeds X.",
+      anyOf: [
+        {
+          enum: [
+            "worse-validation",
+            "toward-overfitting",
+            "toward-underfitting",
+            "worse-on-both",
+            "any-movement",
+            "slice-regression",
+            "high-bias",
+            "high-variance",
+            "data-mismatch",
+            "validation-overfit",
+            "guardrail-regression",
+            "guardrail-undetermined",
+            "none"
+          ]
+        },
+        {
+          type: "string",
+          pattern: "^(train-seconds|inference-ms|parameters|memory-mb)-ratio>(0|[1-9][0-9]*)(\\.[0-9]+)?$"
+        }
       ]
     },
     leverId: {
@@ -48650,6 +48858,18 @@ var fitgap_review_1_schema_default = {
           type: "integer",
           minimum: 0,
           description: "Slices that regressed (slice-regression)."
+        },
+        guardrails: {
+          type: "array",
+          items: {
+            type: "string"
+          },
+          description: "Guardrails that fired (guardrail-regression, guardrail-undetermined)."
+        },
+        ratio: {
+          type: "number",
+          exclusiveMinimum: 0,
+          description: "The cost ratio that exceeded its limit (FIELD-ratio>X)."
         }
       }
     },
@@ -48904,6 +49124,231 @@ var fitgap_review_1_schema_default = {
               minimum: 0
             }
           }
+        }
+      }
+    },
+    guardrailChange: {
+      title: "GuardrailChange",
+      description: "Change of a guardrail, candidate \u2212 baseline, in the metric's own units; the call is in the metric's direction.",
+      type: "object",
+      additionalProperties: false,
+      required: ["estimate", "ci", "p", "test", "call"],
+      properties: {
+        estimate: {
+          type: "number"
+        },
+        ci: {
+          oneOf: [
+            {
+              $ref: "#/$defs/interval"
+            },
+            {
+              type: "null"
+            }
+          ]
+        },
+        p: {
+          oneOf: [
+            {
+              type: "number"
+            },
+            {
+              type: "null"
+            }
+          ]
+        },
+        test: {
+          $ref: "#/$defs/testName"
+        },
+        call: {
+          enum: ["better", "worse", "flat", "undetermined"]
+        }
+      }
+    },
+    guardrailProblem: {
+      title: "GuardrailProblem",
+      description: "What kept a guardrail from a full review.",
+      enum: [
+        "missing-in-baseline",
+        "missing-in-candidate",
+        "metric-differs",
+        "noise-unknown",
+        "no-margin",
+        "candidate-margin-ignored"
+      ]
+    },
+    guardrailReview: {
+      title: "GuardrailReview",
+      description: "One guardrail metric: its change and its non-inferiority call against the margin (confidence-interval approach, ICH E9 \xA73.3.2; Holm across guardrails).",
+      type: "object",
+      additionalProperties: false,
+      required: [
+        "name",
+        "goal",
+        "kind",
+        "unit",
+        "baseline",
+        "candidate",
+        "change",
+        "margin",
+        "marginSource",
+        "worseningBounds",
+        "pNonInferior",
+        "nonInferiority",
+        "problems"
+      ],
+      properties: {
+        name: {
+          type: "string"
+        },
+        goal: {
+          enum: ["minimize", "maximize"]
+        },
+        kind: {
+          enum: ["proportion", "continuous"]
+        },
+        unit: {
+          oneOf: [
+            {
+              type: "string"
+            },
+            {
+              type: "null"
+            }
+          ]
+        },
+        baseline: {
+          oneOf: [
+            {
+              type: "number"
+            },
+            {
+              type: "null"
+            }
+          ]
+        },
+        candidate: {
+          oneOf: [
+            {
+              type: "number"
+            },
+            {
+              type: "null"
+            }
+          ]
+        },
+        change: {
+          oneOf: [
+            {
+              $ref: "#/$defs/guardrailChange"
+            },
+            {
+              type: "null"
+            }
+          ]
+        },
+        margin: {
+          oneOf: [
+            {
+              type: "number",
+              minimum: 0
+            },
+            {
+              type: "null"
+            }
+          ]
+        },
+        marginSource: {
+          oneOf: [
+            {
+              enum: ["config", "baseline", "candidate"]
+            },
+            {
+              type: "null"
+            }
+          ]
+        },
+        worseningBounds: {
+          oneOf: [
+            {
+              $ref: "#/$defs/interval"
+            },
+            {
+              type: "null"
+            }
+          ]
+        },
+        pNonInferior: {
+          oneOf: [
+            {
+              type: "number",
+              minimum: 0,
+              maximum: 1
+            },
+            {
+              type: "null"
+            }
+          ]
+        },
+        nonInferiority: {
+          oneOf: [
+            {
+              enum: ["non-inferior", "inferior", "undetermined"]
+            },
+            {
+              type: "null"
+            }
+          ]
+        },
+        problems: {
+          type: "array",
+          items: {
+            $ref: "#/$defs/guardrailProblem"
+          }
+        }
+      }
+    },
+    costChange: {
+      title: "CostChange",
+      description: "A cost figure of both runs: candidate / baseline with its interval (Welch on logarithms) where per-repeat values allow.",
+      type: "object",
+      additionalProperties: false,
+      required: ["baseline", "candidate", "ratio", "ci", "p", "call"],
+      properties: {
+        baseline: {
+          type: "number",
+          exclusiveMinimum: 0
+        },
+        candidate: {
+          type: "number",
+          exclusiveMinimum: 0
+        },
+        ratio: {
+          type: "number",
+          exclusiveMinimum: 0
+        },
+        ci: {
+          oneOf: [
+            {
+              $ref: "#/$defs/interval"
+            },
+            {
+              type: "null"
+            }
+          ]
+        },
+        p: {
+          oneOf: [
+            {
+              type: "number"
+            },
+            {
+              type: "null"
+            }
+          ]
+        },
+        call: {
+          enum: ["up", "down", "flat", "undetermined"]
         }
       }
     }
@@ -49452,6 +49897,12 @@ import { dirname as dirname2, join as join3, resolve as resolve2 } from "node:pa
 // src/model/run.ts
 var SPLIT_NAMES = ["train", "train_dev", "validation", "test"];
 var CURVE_NAMES = ["epochs", "training_examples", "regularization"];
+var COST_FIELDS = [
+  "trainSeconds",
+  "inferenceMs",
+  "parameters",
+  "memoryMb"
+];
 
 // src/stats/distributions.ts
 var import_jstat = __toESM(require_jstat(), 1);
@@ -49607,8 +50058,8 @@ function tInference(estimate, se2, df, alpha) {
   const p = Math.min(1, 2 * tCdf(-Math.abs(statistic), df));
   return { estimate, ci: [estimate - half, estimate + half], p, df, statistic };
 }
-function toResult(summary2, test) {
-  return { ...summary2, test };
+function toResult(summary2, test2) {
+  return { ...summary2, test: test2 };
 }
 function welchT(baseline, candidate, alpha) {
   assertAlpha(alpha);
@@ -49652,20 +50103,20 @@ function checkGroup(name, values) {
 }
 
 // src/stats/proportions.ts
-function normalTest(estimate, variance, alpha, test = "z-binomial") {
+function normalTest(estimate, variance, alpha, test2 = "z-binomial") {
   assertAlpha(alpha);
   assertFinite2("normalTest estimate", estimate);
   if (!(variance >= 0) || !Number.isFinite(variance)) {
     throw new RangeError(`normalTest variance must be a finite number >= 0; got ${variance}`);
   }
   if (variance === 0) {
-    return { estimate, ci: [estimate, estimate], p: estimate === 0 ? 1 : 0, test };
+    return { estimate, ci: [estimate, estimate], p: estimate === 0 ? 1 : 0, test: test2 };
   }
   const se = Math.sqrt(variance);
   const statistic = estimate / se;
   const half = normalQuantile(1 - alpha / 2) * se;
   const p = Math.min(1, 2 * normalCdf(-Math.abs(statistic)));
-  return { estimate, ci: [estimate - half, estimate + half], p, test, statistic };
+  return { estimate, ci: [estimate - half, estimate + half], p, test: test2, statistic };
 }
 function binomialVariance(p, n) {
   assertProbability("binomialVariance p", p);
@@ -49731,6 +50182,94 @@ function holmAdjust(p) {
     out[index] = running;
   });
   return out;
+}
+
+// src/stats/non-inferiority.ts
+function welchWorsening(baseline, candidate) {
+  for (const [name, values] of [
+    ["baseline", baseline],
+    ["candidate", candidate]
+  ]) {
+    assertMinLength(name, values, 2);
+    assertFiniteValues(name, values);
+  }
+  const v1 = sampleVariance(baseline) / baseline.length;
+  const v2 = sampleVariance(candidate) / candidate.length;
+  const se2 = v1 + v2;
+  const df = se2 === 0 ? baseline.length + candidate.length - 2 : se2 * se2 / (v1 * v1 / (baseline.length - 1) + v2 * v2 / (candidate.length - 1));
+  return { estimate: mean(candidate) - mean(baseline), se: Math.sqrt(se2), df };
+}
+function upperTail(statistic, df) {
+  return df === null ? normalCdf(-statistic) : tCdf(-statistic, df);
+}
+function nonInferiorityTest(worsening, margin, alpha) {
+  assertAlpha(alpha);
+  assertFinite2("worsening estimate", worsening.estimate);
+  assertFinite2("margin", margin);
+  const { estimate, se, df } = worsening;
+  if (!(se >= 0) || !Number.isFinite(se)) {
+    throw new RangeError(`standard error must be a finite number >= 0; got ${se}`);
+  }
+  if (df !== null && !(df > 0)) throw new RangeError(`df must be > 0 or null; got ${df}`);
+  if (se === 0) {
+    const below = estimate < margin;
+    const above = estimate > margin;
+    return {
+      bounds: [estimate, estimate],
+      pNonInferior: below ? 0 : 1,
+      pInferior: above ? 0 : 1
+    };
+  }
+  const quantile = df === null ? normalQuantile(1 - alpha) : tQuantile(1 - alpha, df);
+  const statistic = (estimate - margin) / se;
+  return {
+    bounds: [estimate - quantile * se, estimate + quantile * se],
+    pNonInferior: upperTail(-statistic, df),
+    pInferior: upperTail(statistic, df)
+  };
+}
+function nonInferiorityCalls(tests, alpha) {
+  assertAlpha(alpha);
+  const nonInferior = holmAdjust(tests.map((t) => t === null ? null : t.pNonInferior));
+  const inferior = holmAdjust(tests.map((t) => t === null ? null : t.pInferior));
+  return tests.map((t, i2) => {
+    if (t === null) return { call: null, pNonInferior: null, pInferior: null };
+    const pNi = nonInferior[i2] ?? 1;
+    const pInf = inferior[i2] ?? 1;
+    const call = pNi < alpha ? "non-inferior" : pInf < alpha ? "inferior" : "undetermined";
+    return { call, pNonInferior: pNi, pInferior: pInf };
+  });
+}
+
+// src/stats/ratio.ts
+function geometricMean(values) {
+  if (values.length === 1) return values[0];
+  let sum = 0;
+  for (const v of values) sum += Math.log(v);
+  return Math.exp(sum / values.length);
+}
+function logRatio(baseline, candidate, alpha) {
+  assertAlpha(alpha);
+  for (const [name, values] of [
+    ["baseline", baseline],
+    ["candidate", candidate]
+  ]) {
+    if (values.length === 0) throw new RangeError(`${name} needs at least 1 value; got 0`);
+    values.forEach((v, i2) => {
+      if (!(v > 0) || !Number.isFinite(v)) {
+        throw new RangeError(`${name}[${i2}] must be a positive finite number; got ${v}`);
+      }
+    });
+  }
+  const ratio2 = geometricMean(candidate) / geometricMean(baseline);
+  if (baseline.length < 2 || candidate.length < 2) return { ratio: ratio2, ci: null, p: null };
+  const test2 = welchT(baseline.map(Math.log), candidate.map(Math.log), alpha);
+  const ci = test2.ci;
+  return {
+    ratio: ratio2,
+    ci: ci === null ? null : [Math.exp(ci[0]), Math.exp(ci[1])],
+    p: test2.p
+  };
 }
 
 // src/stats/noncentral-t.ts
@@ -49902,8 +50441,8 @@ function diagnose(components) {
   const bias = components.bias;
   const variance = components.variance;
   if (bias.present && variance.present && bias.value !== null && variance.value !== null) {
-    const ratio = Math.max(bias.value, variance.value) / Math.min(bias.value, variance.value);
-    if (ratio <= 2 && (top.name === "bias" || top.name === "variance"))
+    const ratio2 = Math.max(bias.value, variance.value) / Math.min(bias.value, variance.value);
+    if (ratio2 <= 2 && (top.name === "bias" || top.name === "variance"))
       return "high-bias-and-variance";
   }
   if (top.name === "bias") return "high-bias";
@@ -49939,8 +50478,8 @@ function splitShortfalls(runs, alpha, paired) {
     let result = measureChange(runs.baseline, runs.candidate, both(splitMeasure(split)), alpha);
     if (result === null) continue;
     if (paired !== void 0 && split === pairedSplit && (result.test === "none" || result.test === "z-binomial")) {
-      const test = pairedTest(paired, runs.candidate, alpha);
-      if (test !== null) result = toMetricUnits(test, sign);
+      const test2 = pairedTest(paired, runs.candidate, alpha);
+      if (test2 !== null) result = toMetricUnits(test2, sign);
     }
     out.set(split, result);
   }
@@ -50006,6 +50545,153 @@ function validationMinusTrain(runs, calls) {
   };
   const r = measureChange(runs.baseline, runs.candidate, both(measure), calls.alpha);
   return r === null ? null : toShortfallDelta(r, calls);
+}
+
+// src/analysis/cost.ts
+var asList = (value2) => value2 === void 0 ? null : Array.isArray(value2) ? value2 : [value2];
+function reviewCost(baseline, candidate, alpha) {
+  const out = {};
+  for (const field of COST_FIELDS) {
+    const b = asList(baseline.cost?.[field]);
+    const c = asList(candidate.cost?.[field]);
+    if (b === null || c === null) continue;
+    const r = logRatio(b, c, alpha);
+    const geometric = (values) => values.length === 1 ? values[0] : Math.exp(values.reduce((s, v) => s + Math.log(v), 0) / values.length);
+    const single = !Array.isArray(candidate.cost?.[field]);
+    let call;
+    if (r.p !== null) call = r.p < alpha ? r.ratio > 1 ? "up" : "down" : "flat";
+    else if (single) call = r.ratio > 1 ? "up" : r.ratio < 1 ? "down" : "flat";
+    else call = "undetermined";
+    out[field] = {
+      baseline: geometric(b),
+      candidate: geometric(c),
+      ratio: r.ratio,
+      ci: r.ci,
+      p: r.p,
+      call
+    };
+  }
+  return out;
+}
+
+// src/analysis/guardrails.ts
+var worseSign = (g) => g.metric.goal === "minimize" ? 1 : -1;
+function test(b, c, alpha) {
+  const bs = b.splits.validation;
+  const cs = c.splits.validation;
+  const estimate = mean(cs.values) - mean(bs.values);
+  const sign = worseSign(c);
+  if (bs.values.length >= 2 && cs.values.length >= 2) {
+    const t = welchT(bs.values, cs.values, alpha);
+    const w = welchWorsening(
+      bs.values.map((v) => sign * v),
+      cs.values.map((v) => sign * v)
+    );
+    return { change: changeOf(t.estimate, t.ci, t.p, "welch-t", sign, alpha), worsening: w };
+  }
+  const variance = binomial(b, bs) !== null && binomial(c, cs) !== null;
+  if (variance) {
+    const v = binomial(b, bs) + binomial(c, cs);
+    const z = normalTest(estimate, v, alpha, "z-binomial");
+    return {
+      change: changeOf(estimate, z.ci, z.p, "z-binomial", sign, alpha),
+      worsening: { estimate: sign * estimate, se: Math.sqrt(v), df: null }
+    };
+  }
+  return {
+    change: { estimate, ci: null, p: null, test: "none", call: "undetermined" },
+    worsening: null
+  };
+}
+function binomial(g, split) {
+  if (g.metric.kind !== "proportion" || split.examples === void 0) return null;
+  return binomialVariance(mean(split.values), split.examples * split.values.length);
+}
+function changeOf(estimate, ci, p, testName, sign, alpha) {
+  const significant = p !== null && p < alpha && estimate !== 0;
+  const worse = sign * estimate > 0;
+  return {
+    estimate,
+    ci,
+    p,
+    test: testName,
+    call: significant ? worse ? "worse" : "better" : "flat"
+  };
+}
+function marginOf(name, b, c, settings) {
+  const fromConfig = settings.margins.get(name);
+  const candidateIgnored = (chosen) => c?.margin !== void 0 && chosen !== void 0 && c.margin !== chosen;
+  if (fromConfig !== void 0)
+    return {
+      margin: fromConfig,
+      source: "config",
+      candidateIgnored: candidateIgnored(fromConfig)
+    };
+  if (b?.margin !== void 0)
+    return { margin: b.margin, source: "baseline", candidateIgnored: candidateIgnored(b.margin) };
+  if (c?.margin !== void 0)
+    return { margin: c.margin, source: "candidate", candidateIgnored: false };
+  return { margin: null, source: null, candidateIgnored: false };
+}
+function reviewGuardrails(baseline, candidate, settings) {
+  const byName = (run) => new Map((run.guardrails ?? []).map((g) => [g.metric.name, g]));
+  const bs = byName(baseline);
+  const cs = byName(candidate);
+  const names2 = [.../* @__PURE__ */ new Set([...cs.keys(), ...bs.keys()])];
+  const drafts = names2.map((name) => {
+    const b = bs.get(name);
+    const c = cs.get(name);
+    const metric = (c ?? b)?.metric;
+    if (metric === void 0) throw new Error(`guardrail ${name} vanished`);
+    const { margin, source, candidateIgnored } = marginOf(name, b, c, settings);
+    const review = {
+      name,
+      goal: metric.goal,
+      kind: metric.kind,
+      unit: metric.unit ?? null,
+      baseline: b === void 0 ? null : mean(b.splits.validation.values),
+      candidate: c === void 0 ? null : mean(c.splits.validation.values),
+      change: null,
+      margin,
+      marginSource: source,
+      worseningBounds: null,
+      pNonInferior: null,
+      nonInferiority: null,
+      problems: []
+    };
+    if (candidateIgnored) review.problems.push("candidate-margin-ignored");
+    if (margin === null) review.problems.push("no-margin");
+    if (b === void 0) review.problems.push("missing-in-baseline");
+    if (c === void 0) review.problems.push("missing-in-candidate");
+    if (b === void 0 || c === void 0) return { review, ni: null };
+    if (b.metric.goal !== c.metric.goal || b.metric.kind !== c.metric.kind) {
+      review.problems.push("metric-differs");
+      return { review, ni: null };
+    }
+    const tested = test(b, c, settings.alpha);
+    review.change = tested.change;
+    if (tested.worsening === null) review.problems.push("noise-unknown");
+    if (margin === null) return { review, ni: null };
+    if (tested.worsening === null) {
+      review.nonInferiority = "undetermined";
+      return { review, ni: null };
+    }
+    const ni = nonInferiorityTest(tested.worsening, margin, settings.alpha);
+    review.worseningBounds = ni.bounds;
+    return { review, ni };
+  });
+  const calls = nonInferiorityCalls(
+    drafts.map((d) => d.ni),
+    settings.alpha
+  );
+  return drafts.map((d, i2) => {
+    const call = calls[i2];
+    if (d.ni !== null && call !== void 0 && call.call !== null) {
+      d.review.nonInferiority = call.call;
+      d.review.pNonInferior = call.pNonInferior;
+    }
+    return d.review;
+  });
 }
 
 // src/analysis/hyperparameters.ts
@@ -51331,16 +52017,16 @@ function compareSlices(baseline, candidate, aggregate, settings) {
   }
   unpaired.push(...base.keys());
   const adjusted = holmAdjust(pairs.map((p) => p.test.p));
-  const slices2 = pairs.map(({ b, c, test }, i2) => {
+  const slices2 = pairs.map(({ b, c, test: test2 }, i2) => {
     const pAdjusted = adjusted[i2] ?? null;
-    const call = callOf({ ...test, p: pAdjusted }, settings);
+    const call = callOf({ ...test2, p: pAdjusted }, settings);
     const change2 = call === "flat" ? "flat" : call === "up" === (sign === 1) ? "worse" : "better";
     return {
       name: c.name,
       examples: c.examples ?? null,
       baseline: b.validation,
       candidate: c.validation,
-      delta: toMetricDelta(test, settings),
+      delta: toMetricDelta(test2, settings),
       pAdjusted,
       change: change2,
       hiddenRegression: change2 === "worse" && aggregate === "better"
@@ -51411,8 +52097,21 @@ function buildReview(input) {
     regularization: regularizationOf(candidate),
     noiseUnknown
   });
+  const hasGuardrails = baseline.guardrails !== void 0 || candidate.guardrails !== void 0;
+  const guardrails = hasGuardrails ? reviewGuardrails(baseline, candidate, {
+    alpha: settings.alpha,
+    margins: input.settings.guardrailMargins ?? /* @__PURE__ */ new Map()
+  }) : void 0;
+  const cost = baseline.cost !== void 0 || candidate.cost !== void 0 ? reviewCost(baseline, candidate, settings.alpha) : void 0;
   const gate = applyGate(
-    { movement, validation, slices: sliceResult.slices, candidate: cand },
+    {
+      movement,
+      validation,
+      slices: sliceResult.slices,
+      candidate: cand,
+      ...guardrails === void 0 ? {} : { guardrails },
+      ...cost === void 0 ? {} : { cost }
+    },
     settings.failOn
   );
   return {
@@ -51433,6 +52132,8 @@ function buildReview(input) {
     levers,
     nonLevers: nonLevers2,
     gate,
+    ...guardrails === void 0 ? {} : { guardrails },
+    ...cost === void 0 ? {} : { cost },
     notes: [
       ...input.notes ?? [],
       ...reviewNotes2({
@@ -52373,7 +53074,9 @@ var fitgap_config_schema_default = {
     },
     "fail-on": {
       type: "array",
-      items: { type: "string" },
+      items: {
+        type: "string"
+      },
       description: "Outcomes that fail the gate; see README 'Gate'."
     },
     "epoch-log": {
@@ -52387,7 +53090,11 @@ var fitgap_config_schema_default = {
           minLength: 1,
           description: "CSV file name, relative to each artifact's folder."
         },
-        x: { type: "string", minLength: 1, description: "Column holding the epoch." },
+        x: {
+          type: "string",
+          minLength: 1,
+          description: "Column holding the epoch."
+        },
         train: {
           type: "string",
           minLength: 1,
@@ -52441,6 +53148,22 @@ var fitgap_config_schema_default = {
             type: "string",
             enum: ["log", "linear"],
             description: "How the knob is tuned: `log` (by factors; geometric midpoints) or `linear` (by steps). Default: linear for integers, log otherwise."
+          }
+        }
+      }
+    },
+    guardrails: {
+      type: "object",
+      description: "Non-inferiority margins of guardrail metrics, by guardrail name; they override the artifacts' margins (the config is trusted, an artifact from a pull request is not).",
+      additionalProperties: {
+        type: "object",
+        required: ["margin"],
+        additionalProperties: false,
+        properties: {
+          margin: {
+            type: "number",
+            minimum: 0,
+            description: "Largest acceptable worsening, in the guardrail metric's units."
           }
         }
       }
@@ -52524,7 +53247,12 @@ function resolveSettings(config, overrides = {}) {
     minEffect: overrides.minEffect ?? config["min-effect"] ?? DEFAULT_SETTINGS.minEffect,
     gapTolerance: overrides.gapTolerance ?? config["gap-tolerance"] ?? DEFAULT_SETTINGS.gapTolerance,
     failOn: overrides.failOn ?? config["fail-on"] ?? [...DEFAULT_SETTINGS.failOn],
-    ...reference === void 0 ? {} : { reference }
+    ...reference === void 0 ? {} : { reference },
+    ...config.guardrails === void 0 ? {} : {
+      guardrailMargins: new Map(
+        Object.entries(config.guardrails).map(([name, g]) => [name, g.margin])
+      )
+    }
   };
 }
 function sameMetric(baseline, candidate) {

@@ -58,6 +58,13 @@ export function resolveSettings(
       overrides.gapTolerance ?? config['gap-tolerance'] ?? DEFAULT_SETTINGS.gapTolerance,
     failOn: overrides.failOn ?? config['fail-on'] ?? [...DEFAULT_SETTINGS.failOn],
     ...(reference === undefined ? {} : { reference }),
+    ...(config.guardrails === undefined
+      ? {}
+      : {
+          guardrailMargins: new Map(
+            Object.entries(config.guardrails).map(([name, g]) => [name, g.margin]),
+          ),
+        }),
   };
 }
 

@@ -6,6 +6,8 @@ export interface ConfigFile {
   reference?: number;
   'fail-on'?: string[];
   'epoch-log'?: EpochLogMapping;
+  /** Non-inferiority margins by guardrail name. */
+  guardrails?: Record<string, { margin: number }>;
 }
 
 /** Maps the columns of a CSV epoch log (e.g. `epoch,train_loss,val_loss`) onto `curves.epochs`. */

@@ -22,15 +22,21 @@ const SIGNIFICANT = 4;
 const MAX_DECIMALS = 6;
 
 export function numberFormatFor(review: Pick<Review, 'splits' | 'metric'>): NumberFormat {
+  return formatForValues(
+    review.metric.kind,
+    review.splits.flatMap((s) => [s.baseline, s.candidate]),
+  );
+}
+
+/** The format of another metric (a guardrail): four significant digits of its largest value. */
+export function formatForValues(kind: MetricKind, values: readonly number[]): NumberFormat {
   let largest = 0;
-  for (const change of review.splits) {
-    largest = Math.max(largest, Math.abs(change.baseline), Math.abs(change.candidate));
-  }
+  for (const v of values) largest = Math.max(largest, Math.abs(v));
   const decimals =
     largest === 0 || !Number.isFinite(largest)
       ? SIGNIFICANT
       : Math.min(MAX_DECIMALS, Math.max(0, SIGNIFICANT - 1 - Math.floor(Math.log10(largest))));
-  return { kind: review.metric.kind, decimals };
+  return { kind, decimals };
 }
 
 /** Digits of a number in the format's display unit, `-0` shown as `0`, minus as U+2212. */

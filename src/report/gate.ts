@@ -1,7 +1,7 @@
 /** The gate in words: one line per `fail-on` outcome that fired. */
 import type { FailOn, GateReason, Review } from '../model/review.js';
 import type { Escape } from './escape.js';
-import { count } from './format.js';
+import { count, fixed } from './format.js';
 import { MOVEMENT_TITLE, say, type Words } from './words.js';
 
 const OUTCOME_SENTENCE: Words<FailOn> = new Map<FailOn, string>([
@@ -25,6 +25,13 @@ function reasonSentence(reason: GateReason, review: Review, esc: Escape): string
     const n = reason.slices ?? 0;
     return `${count(n)} ${n === 1 ? 'slice' : 'slices'} regressed significantly`;
   }
+  if (reason.outcome === 'guardrail-regression' || reason.outcome === 'guardrail-undetermined') {
+    const names = (reason.guardrails ?? []).map((n) => esc(n, 60)).join(', ');
+    return reason.outcome === 'guardrail-regression'
+      ? `guardrail worse beyond its margin (${names})`
+      : `cannot tell whether a guardrail stays within its margin (${names})`;
+  }
+  if (reason.ratio !== undefined) return `the cost ratio is ×${fixed(reason.ratio, 2)}`;
   return OUTCOME_SENTENCE.get(reason.outcome) ?? 'fired';
 }
 

@@ -13,6 +13,7 @@ import {
   type NumberFormat,
 } from './format.js';
 import { gateSentence } from './gate.js';
+import { guardrailNames, tradeOffPhrase } from './guardrails.js';
 import { leverText } from './levers.js';
 import { sortSlices } from './tables.js';
 import {
@@ -60,6 +61,22 @@ const GOOD_MOVEMENTS = new Set([
   'away-from-underfitting',
 ]);
 
+/** Trade-off of a moved cost, and guardrails that regressed or cannot be told apart. */
+function guardrailLines(review: Review, esc: Escape): HeadlineLine[] {
+  const lines: HeadlineLine[] = [];
+  const tradeOff = tradeOffPhrase(review, esc);
+  if (tradeOff !== null) lines.push({ label: 'Trade-off', text: `${tradeOff}.`, tone: 'neutral' });
+  const inferior = guardrailNames(review, 'inferior');
+  if (inferior.length > 0) {
+    lines.push({
+      label: `${inferior.length === 1 ? 'Guardrail' : 'Guardrails'} regressed beyond the margin`,
+      text: `${inferior.map((n) => esc(n, 60)).join(', ')}.`,
+      tone: 'bad',
+    });
+  }
+  return lines;
+}
+
 export function buildHeadline(review: Review, esc: Escape): Headline {
   const f = numberFormatFor(review);
   const metric = esc(review.metric.name, 60);
@@ -97,6 +114,7 @@ export function buildHeadline(review: Review, esc: Escape): Headline {
       text: `${from}(Δ ${vStats}).`,
       tone: vTone,
     },
+    ...guardrailLines(review, esc),
     {
       label: review.gate.pass ? 'Gate passed' : 'Gate failed',
       text: gateSentence(review, esc),

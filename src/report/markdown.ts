@@ -9,6 +9,7 @@ import { markdownTable } from 'markdown-table';
 import type { Review } from '../model/review.js';
 import { escapeInline } from './escape.js';
 import { count } from './format.js';
+import { guardrailsTable } from './guardrails.js';
 import { buildHeadline } from './headline.js';
 import { buildMarker } from './marker.js';
 import type { Chart } from './mermaid.js';
@@ -26,7 +27,7 @@ import {
   slicesTable,
   splitsTable,
 } from './tables.js';
-import { CAUTION } from './words.js';
+import { CAUTION, levelPercent } from './words.js';
 
 export interface MarkdownOptions {
   /** Key of the hidden marker, so several fitgap reports can live on one PR. @default 'default' */
@@ -132,6 +133,8 @@ interface Parts {
 
 function compose(review: Review, { marker, files, charts }: Parts, d: Detail): string {
   const out: string[] = [marker, ...headlineBlock(review)];
+  const guards = guardrailsTable(review, escapeInline, levelPercent(review));
+  if (guards !== null) out.push('### Guardrails and cost', '', table(guards), '');
   out.push('### Splits', '', table(splitsTable(review, escapeInline)), '');
   out.push('### Error decomposition', '', table(decompositionTable(review, escapeInline)), '');
   const missing = unavailableNotes(review, escapeInline);

@@ -50,6 +50,16 @@ export function methodNotes(review: Review, esc: Escape): string[] {
   for (const [test, what] of uses) {
     lines.push(`${[...new Set(what)].join(', ')}: ${say(TEST_WHY, test, esc)}`);
   }
+  if ((review.guardrails ?? []).some((g) => g.margin !== null)) {
+    lines.push(
+      `Guardrails: a guardrail is within its margin when the one-sided ${levelPercent(review)}% upper confidence bound of its worsening is below the margin, beyond it when the lower bound is above the margin, and undetermined otherwise (the confidence-interval approach to non-inferiority, ICH E9 §3.3.2 and E10; Wellek 2010). The one-sided p-values are Holm-adjusted across guardrails; the primary verdict is not adjusted by them. A margin from the config wins over the artifacts', the baseline's over the candidate's.`,
+    );
+  }
+  if (review.cost !== undefined && Object.keys(review.cost).length > 0) {
+    lines.push(
+      "Cost ratios are candidate / baseline; with per-repeat values the interval comes from Welch's t-test on the logarithms (a ratio of geometric means). A single figure (parameters, memory) changes exactly as given; a timing taken once per run has unknown noise.",
+    );
+  }
   if (review.slices.length > 0) {
     lines.push(
       `Slice p-values are adjusted with the Holm–Bonferroni method over all ${count(review.slices.length)} slices, so a few bad slices among many are not flagged by chance.`,

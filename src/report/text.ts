@@ -7,6 +7,7 @@
 import type { Review } from '../model/review.js';
 import { terminalText, truncate } from './escape.js';
 import { count } from './format.js';
+import { guardrailsTable } from './guardrails.js';
 import { buildHeadline } from './headline.js';
 import type { Tone } from './headline.js';
 import { numberFormatFor } from './format.js';
@@ -22,7 +23,7 @@ import {
   slicesTable,
   splitsTable,
 } from './tables.js';
-import { CAUTION } from './words.js';
+import { CAUTION, levelPercent } from './words.js';
 
 export interface TextOptions {
   /** ANSI colour (bold headings, green/red for good/bad). */
@@ -65,6 +66,8 @@ export function renderText(review: Review, options: TextOptions): string {
     }
     out.push(...rest);
   }
+  const guards = guardrailsTable(review, esc, levelPercent(review), true);
+  if (guards !== null) out.push('', heading('Guardrails and cost'), ...textTable(guards, width));
   // When the splits table is too wide, drop its Reading column (the sign of Δ and the headline
   // carry it) rather than cut the split names.
   const splits = splitsTable(review, esc);
