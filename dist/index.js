@@ -45949,7 +45949,7 @@ function workflowFileFromRef(ref) {
 }
 async function findArtifact(options) {
   const { octokit, repo, filter, name } = options;
-  const fullName2 = `${repo.owner}/${repo.repo}`;
+  const fullName2 = options.headRepository ?? `${repo.owner}/${repo.repo}`;
   const { data } = await octokit.rest.actions.listWorkflowRuns({
     ...repo,
     workflow_id: options.workflow,
@@ -45973,7 +45973,7 @@ async function findArtifact(options) {
   const where = "branch" in filter ? `on branch "${filter.branch}"` : `for commit ${filter.sha}`;
   throw new InputError([
     {
-      file: 'input "baseline-artifact"',
+      file: options.label ?? 'input "baseline-artifact"',
       pointer: "",
       expected: `found no artifact named "${name}" in the ${runs.length} newest successful runs of workflow "${options.workflow}" ${where}`,
       hint: 'Check that this workflow uploads an artifact with that name, that it succeeded there within the retention period, and that the job has "actions: read" permission.'
@@ -50473,15 +50473,33 @@ async function pairIfBoth(baseline, candidate) {
   }
   return { paired: { ...paired, split: bp.split }, notes };
 }
+async function loadReviewConfig(cwd, config) {
+  const configPath = resolve2(cwd, config ?? DEFAULT_CONFIG_PATH);
+  const loaded = await loadConfig(configPath, config ?? DEFAULT_CONFIG_PATH, config !== void 0);
+  if (loaded === null) return { config: {}, file: null };
+  return {
+    config: loaded.config,
+    file: {
+      path: config ?? DEFAULT_CONFIG_PATH,
+      sha256: createHash2("sha256").update(loaded.text).digest("hex")
+    }
+  };
+}
+async function reviewLoadedRuns(baseline, candidate, config, overrides) {
+  const mismatch = sameMetric(baseline, candidate);
+  if (mismatch.length > 0) throw new InputError(mismatch);
+  const { paired, notes } = await pairIfBoth(baseline, candidate);
+  return buildReview({
+    baseline: baseline.artifact,
+    candidate: candidate.artifact,
+    settings: resolveSettings(config, overrides),
+    ...paired === void 0 ? {} : { paired },
+    notes: [...baseline.notes, ...candidate.notes, ...notes]
+  });
+}
 async function reviewFiles(options) {
   const cwd = options.cwd ?? ".";
-  const configPath = resolve2(cwd, options.config ?? DEFAULT_CONFIG_PATH);
-  const loaded = await loadConfig(
-    configPath,
-    options.config ?? DEFAULT_CONFIG_PATH,
-    options.config !== void 0
-  );
-  const config = loaded?.config ?? {};
+  const { config, file: configFile } = await loadReviewConfig(cwd, options.config);
   const epochLog = config["epoch-log"];
   const load = (path) => loadRun(resolve2(cwd, path), {
     displayName: path,
@@ -50497,25 +50515,13 @@ async function reviewFiles(options) {
     throw new InputError(issues2);
   const baseline = b.value;
   const candidate = c.value;
-  const mismatch = sameMetric(baseline, candidate);
-  if (mismatch.length > 0) throw new InputError(mismatch);
-  const { paired, notes } = await pairIfBoth(baseline, candidate);
-  const review = buildReview({
-    baseline: baseline.artifact,
-    candidate: candidate.artifact,
-    settings: resolveSettings(config, options.overrides),
-    ...paired === void 0 ? {} : { paired },
-    notes: [...baseline.notes, ...candidate.notes, ...notes]
-  });
+  const review = await reviewLoadedRuns(baseline, candidate, config, options.overrides);
   return {
     review,
     files: {
       baseline: { path: options.baseline, sha256: baseline.sha256 },
       candidate: { path: options.candidate, sha256: candidate.sha256 },
-      config: loaded === null ? null : {
-        path: options.config ?? DEFAULT_CONFIG_PATH,
-        sha256: createHash2("sha256").update(loaded.text).digest("hex")
-      }
+      config: configFile
     }
   };
 }

@@ -6,6 +6,7 @@
  */
 import type { RangeAudit } from '../model/audit.js';
 import { baseFields, fieldsByEntry, short } from './audit-table.js';
+import { reviewFields } from './audit-fields.js';
 import type { RunFields } from './audit-fields.js';
 import { escapeInline, mermaidLabel } from './escape.js';
 import { chartNumber } from './format.js';
@@ -52,6 +53,12 @@ function thin<T>(values: T[], max: number): T[] {
   );
 }
 
+function metricName(audit: RangeAudit): string {
+  for (const entry of audit.entries)
+    if (entry.status === 'reviewed') return reviewFields(entry.review).metric.name;
+  return '';
+}
+
 /** The chart, or null with fewer than two commits to draw. */
 export function trendChart(audit: RangeAudit): TrendChart | null {
   const all = points(audit);
@@ -66,11 +73,11 @@ export function trendChart(audit: RangeAudit): TrendChart | null {
   const y1 = hi + pad;
   const decimals = Math.min(6, Math.max(0, 2 - Math.floor(Math.log10(y1 - y0))));
   const first = all[0]?.sha ?? '';
-  const metric = mermaidLabel(audit.artifactPath, 40) || 'run artifact';
+  const metric = mermaidLabel(metricName(audit), 40) || 'metric';
   const code = [
     `%%{init: {"themeVariables": {"xyChart": {"plotColorPalette": "${series.map((s) => s.colour).join(', ')}"}}}}%%`,
     'xychart-beta',
-    `  title "Trend of ${metric}"`,
+    `  title "${metric} by commit"`,
     `  x-axis "commit" [${shown.map((p) => `"${short(p.sha)}"`).join(', ')}]`,
     `  y-axis "shortfall units" ${chartNumber(y0, decimals)} --> ${chartNumber(y1, decimals)}`,
     ...series.map(
