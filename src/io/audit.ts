@@ -60,6 +60,9 @@ export interface RangeAuditOptions {
 
 const short = (sha: string): string => sha.slice(0, 7);
 
+/** First-parent ancestors searched for a starting baseline when the range's start has none. */
+export const LOOKBACK = 50;
+
 type GitSide =
   | { ok: true; artifact: SideFile; beside: SideFile[]; key: string }
   | { ok: false; kind: 'missing' | 'not-a-file' | 'too-large'; reason: string };
@@ -144,7 +147,61 @@ export async function auditRange(options: RangeAuditOptions): Promise<RangeAudit
   const release = async (side: Side | null) => {
     if (side !== null && side !== first) await rm(side.dir, { recursive: true, force: true });
   };
+  const epochLog = options.config['epoch-log'];
+  /** Loads a commit's side; the issues when it is invalid (its folder is then removed). */
+  const load = async (
+    info: CommitInfo,
+    read: Extract<GitSide, { ok: true }>,
+  ): Promise<Side | Issue[]> => {
+    const dir = join(root, info.sha);
+    try {
+      const run = await loadSide({
+        dir,
+        artifact: read.artifact,
+        beside: read.beside,
+        displayName: `${short(info.sha)}:${path}`,
+        ...(epochLog === undefined ? {} : { epochLog }),
+      });
+      return { info, run, dir, sources: sideSources(info.sha, read.artifact, read.beside) };
+    } catch (error) {
+      if (!(error instanceof InputError)) throw error;
+      await rm(dir, { recursive: true, force: true });
+      return error.issues;
+    }
+  };
   try {
+    // Without a valid artifact at the range's start, its nearest first-parent ancestor with one
+    // is the first baseline, so a range cut into slices chains as one long audit does.
+    const start = await readGitSide(options, from, path, cap);
+    const startValid = start.ok && !Array.isArray(await load(fromInfo, start));
+    if (!startValid) {
+      const ancestors = (
+        await git(['rev-list', '--first-parent', `--max-count=${LOOKBACK + 1}`, from, '--'])
+      )
+        .toString('utf8')
+        .split('\n')
+        .filter((sha) => /^[0-9a-f]{40}$/.test(sha))
+        .slice(1);
+      for (const sha of ancestors) {
+        const read = await readGitSide(options, sha, path, cap);
+        if (!read.ok) continue;
+        const side = await load(await commitInfo(git, sha), read);
+        if (Array.isArray(side)) continue;
+        entries.push({
+          status: 'base',
+          commit: side.info,
+          sources: side.sources,
+          note: `the range's start ${short(from)} has no valid artifact; its nearest ancestor with one starts the chain`,
+        });
+        chain = side;
+        first = side;
+        lastKey = read.key;
+        lastValid = sha;
+        lastSeen = sha;
+        seenAny = true;
+        break;
+      }
+    }
     for (const [index, info] of all.entries()) {
       options.onProgress?.(index, all.length, info);
       const read = await readGitSide(options, info.sha, path, cap);
@@ -167,37 +224,15 @@ export async function auditRange(options: RangeAuditOptions): Promise<RangeAudit
         });
         continue;
       }
-      const dir = join(root, info.sha);
-      let run: LoadedRun;
-      try {
-        run = await loadSide({
-          dir,
-          artifact: read.artifact,
-          beside: read.beside,
-          displayName: `${short(info.sha)}:${path}`,
-          ...(options.config['epoch-log'] === undefined
-            ? {}
-            : { epochLog: options.config['epoch-log'] }),
-        });
-      } catch (error) {
-        if (!(error instanceof InputError)) throw error;
-        await rm(dir, { recursive: true, force: true });
-        entries.push({
-          status: 'skipped',
-          commit: info,
-          kind: 'invalid',
-          reason: oneLine(error.issues),
-        });
+      const loaded = await load(info, read);
+      if (Array.isArray(loaded)) {
+        entries.push({ status: 'skipped', commit: info, kind: 'invalid', reason: oneLine(loaded) });
         continue;
       }
       lastKey = read.key;
       lastValid = info.sha;
-      const side: Side = {
-        info,
-        run,
-        dir,
-        sources: sideSources(info.sha, read.artifact, read.beside),
-      };
+      const side = loaded;
+      const { dir, run } = side;
       const reference = options.against === 'first' ? first : chain;
       if (reference === null) {
         entries.push({

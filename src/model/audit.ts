@@ -71,7 +71,10 @@ export interface RangeAudit {
   /** The range's end (B). */
   to: CommitInfo;
   against: AuditAgainst;
-  /** The range's start, then every commit of the range, oldest first. */
+  /**
+   * The range's start, then every commit of the range, oldest first; preceded by the nearest
+   * first-parent ancestor with a valid artifact when the start has none (a `base` entry).
+   */
   entries: AuditEntry[];
 }
 

@@ -163,8 +163,10 @@ export function auditCounts(audit: RangeAudit): {
   failed: number;
 } {
   const reviewed = audit.entries.filter((e) => e.status === 'reviewed');
+  // An ancestor that supplied the first baseline comes before the range's start: not counted.
+  const start = audit.entries.findIndex((e) => e.commit.sha === audit.from.sha);
   return {
-    commits: audit.entries.length - 1,
+    commits: audit.entries.length - 1 - Math.max(0, start),
     reviewed: reviewed.length,
     skipped: audit.entries.filter((e) => e.status === 'skipped').length,
     failed: reviewed.filter(

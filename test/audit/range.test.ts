@@ -141,6 +141,41 @@ describe('auditRange', () => {
     }
   });
 
+  it('a range starting at a commit without a valid artifact starts from its nearest ancestor with one', async () => {
+    // How a range cut into slices chains: each slice starts at the last commit of the previous one.
+    const { config, file } = await loadReviewConfig(h.dir);
+    const slice = (start: number) =>
+      auditRange({
+        git: gitRunner(h.dir),
+        cwd: h.dir,
+        range: `${h.shas[start]}..main`,
+        artifact: ARTIFACT,
+        against: 'previous',
+        config,
+        configFile: file,
+        tempDir: temp,
+      });
+    const fromInvalid = await slice(3);
+    expect(fromInvalid.entries.map(shape)).toEqual([
+      'base',
+      'skipped:invalid',
+      'reviewed',
+      'skipped:missing',
+      'reviewed',
+    ]);
+    expect(fromInvalid.entries[0]?.commit.sha).toBe(h.shas[2]);
+    expect(fromInvalid.entries[0]?.status === 'base' && fromInvalid.entries[0].note).toBe(
+      `the range's start ${h.shas[3]?.slice(0, 7)} has no valid artifact; its nearest ancestor with one starts the chain`,
+    );
+    const fromDeleted = await slice(5);
+    expect(fromDeleted.entries.map(shape)).toEqual(['base', 'skipped:missing', 'reviewed']);
+    // The same reviews as the one long audit (c2 holds c1's bytes).
+    const reviews = (a: RangeAudit) =>
+      a.entries.flatMap((e) => (e.status === 'reviewed' ? [canonicalJson(e.review)] : []));
+    expect(reviews(fromInvalid)).toEqual(reviews(previous).slice(1));
+    expect(reviews(fromDeleted)).toEqual(reviews(previous).slice(2));
+  });
+
   it('--against first reviews every commit against the range start', async () => {
     const result = await audit('first');
     const reviewed = result.entries.filter((e) => e.status === 'reviewed');
