@@ -25582,6 +25582,7 @@ function firstLine(text2) {
 
 // src/io/audit.ts
 var short2 = (sha) => sha.slice(0, 7);
+var LOOKBACK = 50;
 async function readGitSide(options, commit, path, cap) {
   const { git } = options;
   const entry = await treeEntry(git, commit, path);
@@ -25645,7 +25646,49 @@ async function auditRange(options) {
   const release = async (side) => {
     if (side !== null && side !== first) await rm2(side.dir, { recursive: true, force: true });
   };
+  const epochLog = options.config["epoch-log"];
+  const load = async (info, read) => {
+    const dir = join4(root, info.sha);
+    try {
+      const run = await loadSide({
+        dir,
+        artifact: read.artifact,
+        beside: read.beside,
+        displayName: `${short2(info.sha)}:${path}`,
+        ...epochLog === void 0 ? {} : { epochLog }
+      });
+      return { info, run, dir, sources: sideSources(info.sha, read.artifact, read.beside) };
+    } catch (error) {
+      if (!(error instanceof InputError)) throw error;
+      await rm2(dir, { recursive: true, force: true });
+      return error.issues;
+    }
+  };
   try {
+    const start = await readGitSide(options, from, path, cap);
+    const startValid = start.ok && !Array.isArray(await load(fromInfo, start));
+    if (!startValid) {
+      const ancestors = (await git(["rev-list", "--first-parent", `--max-count=${LOOKBACK + 1}`, from, "--"])).toString("utf8").split("\n").filter((sha) => /^[0-9a-f]{40}$/.test(sha)).slice(1);
+      for (const sha of ancestors) {
+        const read = await readGitSide(options, sha, path, cap);
+        if (!read.ok) continue;
+        const side = await load(await commitInfo(git, sha), read);
+        if (Array.isArray(side)) continue;
+        entries.push({
+          status: "base",
+          commit: side.info,
+          sources: side.sources,
+          note: `the range's start ${short2(from)} has no valid artifact; its nearest ancestor with one starts the chain`
+        });
+        chain = side;
+        first = side;
+        lastKey = read.key;
+        lastValid = sha;
+        lastSeen = sha;
+        seenAny = true;
+        break;
+      }
+    }
     for (const [index, info] of all.entries()) {
       options.onProgress?.(index, all.length, info);
       const read = await readGitSide(options, info.sha, path, cap);
@@ -25665,35 +25708,15 @@ async function auditRange(options) {
         });
         continue;
       }
-      const dir = join4(root, info.sha);
-      let run;
-      try {
-        run = await loadSide({
-          dir,
-          artifact: read.artifact,
-          beside: read.beside,
-          displayName: `${short2(info.sha)}:${path}`,
-          ...options.config["epoch-log"] === void 0 ? {} : { epochLog: options.config["epoch-log"] }
-        });
-      } catch (error) {
-        if (!(error instanceof InputError)) throw error;
-        await rm2(dir, { recursive: true, force: true });
-        entries.push({
-          status: "skipped",
-          commit: info,
-          kind: "invalid",
-          reason: oneLine(error.issues)
-        });
+      const loaded = await load(info, read);
+      if (Array.isArray(loaded)) {
+        entries.push({ status: "skipped", commit: info, kind: "invalid", reason: oneLine(loaded) });
         continue;
       }
       lastKey = read.key;
       lastValid = info.sha;
-      const side = {
-        info,
-        run,
-        dir,
-        sources: sideSources(info.sha, read.artifact, read.beside)
-      };
+      const side = loaded;
+      const { dir, run } = side;
       const reference = options.against === "first" ? first : chain;
       if (reference === null) {
         entries.push({
@@ -30580,8 +30603,9 @@ function skippedLines(audit, esc, code2) {
 }
 function auditCounts(audit) {
   const reviewed = audit.entries.filter((e) => e.status === "reviewed");
+  const start = audit.entries.findIndex((e) => e.commit.sha === audit.from.sha);
   return {
-    commits: audit.entries.length - 1,
+    commits: audit.entries.length - 1 - Math.max(0, start),
     reviewed: reviewed.length,
     skipped: audit.entries.filter((e) => e.status === "skipped").length,
     failed: reviewed.filter(

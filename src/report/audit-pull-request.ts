@@ -10,8 +10,6 @@ import { renderMarkdown } from './markdown.js';
 import { renderText } from './text.js';
 import { short } from './audit-table.js';
 
-const code = (text: string): string => `\`${text.replace(/`/g, '')}\``;
-
 /** The comment key of audit re-runs, so they never replace the PR's own review comment. */
 export function auditCommentKey(key: string): string {
   return `${key.slice(0, 58)}.audit`;

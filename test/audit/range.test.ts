@@ -273,7 +273,7 @@ describe('fitgap audit (CLI, in process)', () => {
     expect(run.stdout).toContain(
       `6 commits after ${s(0)}: 3 reviewed, 3 skipped. Each commit is reviewed against the previous commit that had a valid artifact.`,
     );
-    const rows = run.stdout.split('\n').filter((l) => /^[0-9a-f]{7}  2026/.test(l));
+    const rows = run.stdout.split('\n').filter((l) => /^[0-9a-f]{7} {2}2026/.test(l));
     expect(rows.map((r) => r.slice(0, 7))).toEqual([s(0), s(1), s(4), s(6)]);
     expect(rows[1]).toMatch(
       /toward overfitting +0\.06633 \[0\.06254, 0\.07013\] +−0\.00400 \[−0\.00746, −0\.00054\] better +0\.01000 \(down\) +0\.03033 \(up\) +high variance/,
