@@ -4,14 +4,13 @@
  * contents API, the opt-in audit comment, the JSON Lines record as a file and an output.
  */
 import { readFileSync } from 'node:fs';
-import { Ajv2020 } from 'ajv/dist/2020.js';
-import addFormats from 'ajv-formats';
 import { beforeAll, describe, test } from 'vitest';
 import type { TestContext } from 'vitest';
 import { BOT, FakeRepo, TOKEN } from '../fake-github/repo.js';
 import { FakeGitHub } from '../fake-github/server.js';
 import { FIXTURES, buildBundle, runAction } from '../action/harness.js';
 import { fixtureText, zipFiles } from '../action/zips.js';
+import { validateRecord } from './record-schema.js';
 
 beforeAll(() => buildBundle(), 120_000);
 
@@ -24,12 +23,6 @@ const DISPATCH = {
   ref: 'refs/heads/main',
   repository: { full_name: 'o/r', default_branch: 'main' },
 };
-
-const ajv = new Ajv2020({ allErrors: true, strict: true });
-addFormats.default(ajv);
-const validateRecord = ajv.compile(
-  JSON.parse(readFileSync('schema/fitgap-audit-record-1.schema.json', 'utf8')),
-);
 
 async function setup(context: TestContext) {
   const fake = await new FakeGitHub().start();

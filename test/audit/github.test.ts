@@ -4,11 +4,9 @@
  * server on 127.0.0.1. The request log is asserted; every answer is checked against GitHub's
  * OpenAPI description.
  */
-import { mkdtempSync, readFileSync } from 'node:fs';
+import { mkdtempSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { Ajv2020 } from 'ajv/dist/2020.js';
-import addFormats from 'ajv-formats';
 import { describe, test } from 'vitest';
 import type { TestContext } from 'vitest';
 import { runCli } from '../../src/entries/cli/main.js';
@@ -16,6 +14,7 @@ import { FakeRepo, TOKEN } from '../fake-github/repo.js';
 import { FakeGitHub } from '../fake-github/server.js';
 import { FIXTURES } from '../action/harness.js';
 import { fixtureText, zipFiles } from '../action/zips.js';
+import { validateRecord } from './record-schema.js';
 import { fakeIo } from '../cli/fake-io.js';
 import { predictions } from './history.js';
 
@@ -25,11 +24,6 @@ const LATER = 'd'.repeat(40);
 const baselineRun = fixtureText(`${FIXTURES}/baseline.json`);
 const worseRun = fixtureText(`${FIXTURES}/candidate-worse.json`);
 const temp = mkdtempSync(join(tmpdir(), 'fitgap-audit-gh-'));
-
-const schema = JSON.parse(readFileSync('schema/fitgap-audit-record-1.schema.json', 'utf8'));
-const ajv = new Ajv2020({ allErrors: true, strict: true });
-addFormats.default(ajv);
-const validateRecord = ajv.compile(schema);
 
 async function setup(context: TestContext) {
   const fake = await new FakeGitHub().start();

@@ -3,11 +3,9 @@
  * invalid one, an unchanged one, two with predictions), audited through the service and the CLI.
  */
 import { execFileSync } from 'node:child_process';
-import { mkdirSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { mkdirSync, mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { Ajv2020 } from 'ajv/dist/2020.js';
-import addFormats from 'ajv-formats';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { auditRange } from '../../src/io/audit.js';
 import { repositoryName, repositoryPath } from '../../src/io/audit-git.js';
@@ -20,6 +18,7 @@ import type { AuditEntry, RangeAudit } from '../../src/model/audit.js';
 import { canonicalJson } from '../../src/report/audit-record.js';
 import { fakeIo } from '../cli/fake-io.js';
 import { ARTIFACT, buildHistory, git } from './history.js';
+import { validateRecord } from './record-schema.js';
 import type { History } from './history.js';
 
 let h: History;
@@ -206,10 +205,7 @@ describe('fitgap audit (CLI, in process)', () => {
     expect(run.code).toBe(0);
     const lines = run.stdout.trimEnd().split('\n');
     expect(lines).toHaveLength(3);
-    const schema = JSON.parse(readFileSync('schema/fitgap-audit-record-1.schema.json', 'utf8'));
-    const ajv = new Ajv2020({ allErrors: true, strict: true });
-    addFormats.default(ajv);
-    const validate = ajv.compile(schema);
+    const validate = validateRecord;
     for (const line of lines) {
       const record = JSON.parse(line) as Record<string, unknown>;
       expect(validate(record), JSON.stringify(validate.errors)).toBe(true);
@@ -228,10 +224,7 @@ describe('fitgap audit (CLI, in process)', () => {
   });
 
   it('the schema check can fail: a record without its review is refused', () => {
-    const schema = JSON.parse(readFileSync('schema/fitgap-audit-record-1.schema.json', 'utf8'));
-    const ajv = new Ajv2020({ allErrors: true, strict: true });
-    addFormats.default(ajv);
-    const validate = ajv.compile(schema);
+    const validate = validateRecord;
     expect(validate({ base: 'x', head: h.shas[1], sources: [] })).toBe(false);
   });
 
