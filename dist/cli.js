@@ -25571,8 +25571,9 @@ function repositoryName(url) {
   }
 }
 function repositoryPath(prefix, typed) {
-  const joined = posix3.normalize(posix3.join(prefix, typed.replace(/\\/g, "/")));
-  if (posix3.isAbsolute(typed) || joined.startsWith("../") || joined === ".." || joined === ".")
+  const slashed = typed.replace(/\\/g, "/");
+  const joined = posix3.normalize(posix3.join(prefix, slashed));
+  if (posix3.isAbsolute(slashed) || posix3.isAbsolute(joined) || joined.startsWith("../") || joined === ".." || joined === ".")
     return null;
   return joined.replace(/\/+$/, "");
 }

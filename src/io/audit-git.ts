@@ -160,8 +160,15 @@ export function repositoryName(url: string): string | null {
  * the repository); null when it leaves the repository.
  */
 export function repositoryPath(prefix: string, typed: string): string | null {
-  const joined = posix.normalize(posix.join(prefix, typed.replace(/\\/g, '/')));
-  if (posix.isAbsolute(typed) || joined.startsWith('../') || joined === '..' || joined === '.')
+  const slashed = typed.replace(/\\/g, '/');
+  const joined = posix.normalize(posix.join(prefix, slashed));
+  if (
+    posix.isAbsolute(slashed) ||
+    posix.isAbsolute(joined) ||
+    joined.startsWith('../') ||
+    joined === '..' ||
+    joined === '.'
+  )
     return null;
   return joined.replace(/\/+$/, '');
 }
