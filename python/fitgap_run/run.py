@@ -40,7 +40,10 @@ CURVE_SOURCES = ("held-out", "cross-validation")
 AGGREGATES = ("mean", "rmse", "sum")
 EVALUATION_ROWS = ("fixed", "per-repeat")
 TOP_LEVEL_KEYS = ("$schema", "format", "run", "metric", "reference", "splits",
-                  "hyperparameters", "curves", "slices", "predictions")
+                  "hyperparameters", "curves", "slices", "predictions", "guardrails", "cost")
+#: ``cost`` fields: per-repeat lists and single numbers, all positive.
+COST_LISTS = ("trainSeconds", "inferenceMs")
+COST_NUMBERS = ("parameters", "memoryMb")
 #: Knobs where a smaller value means stronger regularization: scikit-learn's ``C`` ("inverse of
 #: regularization strength", LogisticRegression and SVC API reference).
 INVERSE_KNOBS = frozenset({"C"})
@@ -179,6 +182,11 @@ class _Checks:
         predictions = self.object(doc, "predictions")
         if predictions is not None:
             self.predictions(predictions, splits if isinstance(splits, dict) else {})
+        if "guardrails" in doc:
+            self.guardrails(doc["guardrails"])
+        cost = self.object(doc, "cost")
+        if cost is not None:
+            self.cost(cost)
         if metric.get("goal") == "maximize" and "best" not in metric:
             above = [path for v, path in self.seen if math.isfinite(v) and v > 1]
             if above:
@@ -269,6 +277,52 @@ class _Checks:
                 first, n = self.repeats
                 self.add(f"{at}.values", f"has {len(values)} values but splits.{first}.values has {n}; "
                                          "position i in every split is the same trained model")
+
+    def guardrails(self, guardrails):
+        if not isinstance(guardrails, list):
+            self.add("guardrails", "must be a list of guardrail metrics")
+            return
+        names = set()
+        for i, guardrail in enumerate(guardrails):
+            at = f"guardrails[{i}]"
+            if not isinstance(guardrail, dict):
+                self.add(at, "must be an object with metric, splits and margin")
+                continue
+            self.known(guardrail, at, ("metric", "splits", "margin"))
+            metric = self.object(guardrail, "metric", f"{at}.metric") or {}
+            self.known(metric, f"{at}.metric", ("name", "goal", "kind", "best", "unit"))
+            self.text(metric, "name", f"{at}.metric.name", 100)
+            if metric.get("name") in names:
+                self.add(f"{at}.metric.name", f"repeats the guardrail name {metric['name']!r}")
+            names.add(metric.get("name"))
+            for key, allowed in (("goal", ("minimize", "maximize")), ("kind", ("proportion", "continuous"))):
+                if key not in metric:
+                    self.add(f"{at}.metric.{key}", "is required")
+                self.choice(metric, key, f"{at}.metric.{key}", allowed)
+            if "margin" in guardrail and not (_is_num(guardrail["margin"]) and guardrail["margin"] >= 0):
+                self.add(f"{at}.margin", f"must be a number >= 0 in the metric's units (got {guardrail['margin']!r})")
+            splits = self.object(guardrail, "splits", f"{at}.splits") or {}
+            self.known(splits, f"{at}.splits", ("validation", "test"))
+            if "validation" not in splits:
+                self.add(f"{at}.splits.validation", "is required")
+            for name, split in splits.items():
+                where = f"{at}.splits.{name}"
+                values = split.get("values") if isinstance(split, dict) else None
+                if not isinstance(values, list) or not values or not all(_is_num(v) for v in values):
+                    self.add(f"{where}.values", "must be a non-empty list of numbers, one per repeat")
+                elif metric.get("kind") == "proportion" and not all(0 <= v <= 1 for v in values):
+                    self.add(f"{where}.values", "must be within [0, 1] for a proportion guardrail")
+
+    def cost(self, cost):
+        self.known(cost, "cost", COST_LISTS + COST_NUMBERS)
+        for key in COST_LISTS:
+            values = cost.get(key)
+            if key in cost and not (isinstance(values, list) and values
+                                    and all(_is_num(v) and v > 0 for v in values)):
+                self.add(f"cost.{key}", "must be a non-empty list of positive numbers, one per repeat")
+        for key in COST_NUMBERS:
+            if key in cost and not (_is_num(cost[key]) and cost[key] > 0):
+                self.add(f"cost.{key}", f"must be a positive number (got {cost[key]!r})")
 
     def curves(self, curves):
         self.known(curves, "curves", CURVE_NAMES + ("sources",))
@@ -488,6 +542,42 @@ class Run:
                       f"must be one of {', '.join(EVALUATION_ROWS)} (got {evaluation_rows!r})")
             split["evaluationRows"] = evaluation_rows
         self._doc["splits"][name] = split
+        return self
+
+    def add_guardrail(self, name, *, goal, kind, validation, examples=None, test=None,
+                      test_examples=None, margin=None, best=None, unit=None):
+        """A metric that must not get worse by more than ``margin`` (its units): calibration
+        error, a fairness gap, latency. ``validation`` and ``test``: one value per repeat.
+        Without a margin (here or in the config) it is reported but never gates."""
+        at = f"guardrails[{len(self._doc.get('guardrails', []))}]"
+        metric = {"name": name, "goal": goal, "kind": kind}
+        if best is not None:
+            metric["best"] = _number(best, f"{at}.metric.best")
+        if unit is not None:
+            metric["unit"] = unit
+        splits = {}
+        for split, values, count in (("validation", validation, examples), ("test", test, test_examples)):
+            if values is None:
+                continue
+            splits[split] = {"values": _numbers(values, f"{at}.splits.{split}.values")}
+            if count is not None:
+                splits[split]["examples"] = _count(count, f"{at}.splits.{split}.examples")
+        guardrail = {"metric": metric, "splits": splits}
+        if margin is not None:
+            guardrail["margin"] = _number(margin, f"{at}.margin")
+        self._doc.setdefault("guardrails", []).append(guardrail)
+        return self
+
+    def set_cost(self, *, train_seconds=None, inference_ms=None, parameters=None, memory_mb=None):
+        """What the run cost: training seconds and inference milliseconds per repeat, the number
+        of trained parameters, peak memory in megabytes. Only the fields given are written."""
+        cost = self._doc.setdefault("cost", {})
+        for key, values in (("trainSeconds", train_seconds), ("inferenceMs", inference_ms)):
+            if values is not None:
+                cost[key] = _numbers(values, f"cost.{key}")
+        for key, value in (("parameters", parameters), ("memoryMb", memory_mb)):
+            if value is not None:
+                cost[key] = _number(value, f"cost.{key}")
         return self
 
     def set_hyperparameters(self, values=None, *, inverse=(), **more):

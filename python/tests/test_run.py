@@ -33,6 +33,30 @@ class Temp(unittest.TestCase):
                    goal=goal, kind=kind, **kw)
 
 
+class GuardrailCostTest(Temp):
+    def test_guardrail_and_cost_are_written_and_checked(self):
+        run = self.run_()
+        run.set_split("validation", [0.061, 0.066], examples=5000)
+        run.set_split("train", [0.031, 0.029])
+        run.add_guardrail("calibration_error", goal="minimize", kind="continuous",
+                          validation=[0.021, 0.022], margin=0.005)
+        run.set_cost(train_seconds=[120.5, 118.0], parameters=4200)
+        doc = run.to_dict()
+        self.assertEqual(list(doc)[-2:], ["guardrails", "cost"])
+        self.assertEqual(doc["guardrails"][0]["margin"], 0.005)
+        self.assertEqual(doc["cost"], {"trainSeconds": [120.5, 118.0], "parameters": 4200})
+        self.assertEqual(check_artifact(doc), [])
+
+    def test_bad_guardrail_and_cost_fields_are_named(self):
+        doc = self.run_().set_split("validation", [0.06]).set_split("train", [0.03]).to_dict()
+        doc["guardrails"] = [{"metric": {"name": "gap", "goal": "minimize", "kind": "proportion"},
+                              "splits": {"validation": {"values": [1.5]}}, "margin": -1}]
+        doc["cost"] = {"trainSeconds": [0], "latency": 3}
+        found = [path for path, _ in check_artifact(doc)]
+        self.assertEqual(sorted(found), ["cost.latency", "cost.trainSeconds", "guardrails[0].margin",
+                                         "guardrails[0].splits.validation.values"])
+
+
 class BuilderTest(Temp):
     def test_writes_keys_in_schema_order(self):
         run = self.run_(reference=0.02, commit="9f1c2ab")

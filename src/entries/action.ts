@@ -3,6 +3,8 @@
  * the chosen mode. Environment reads happen here and in `action/settings.ts` only.
  */
 import * as core from '@actions/core';
+import { runAudit } from './action/audit-mode.js';
+import { readAuditSettings } from './action/audit-settings.js';
 import { handleFailure } from './action/failure.js';
 import { coreIO } from './action/io.js';
 import { runPublish } from './action/publish-mode.js';
@@ -24,7 +26,9 @@ async function main(): Promise<void> {
     log: (message) => core.info(message),
   });
   const deps = { settings, context: buildRunContext(context), octokit, io: coreIO() };
-  await (settings.mode === 'publish' ? runPublish(deps) : runReview(deps));
+  if (settings.mode === 'audit')
+    await runAudit({ ...deps, audit: readAuditSettings(settings), now: () => new Date() });
+  else await (settings.mode === 'publish' ? runPublish(deps) : runReview(deps));
 }
 
 main().catch(handleFailure);

@@ -14,6 +14,8 @@ runCli(process.argv.slice(2), {
   writeFile: (path, text) => writeFile(path, text, 'utf8'),
   demoDir: fileURLToPath(new URL('../demo/', import.meta.url)),
   version,
+  stderrStream: process.stderr,
+  env: { GITHUB_TOKEN: process.env['GITHUB_TOKEN'], GITHUB_API_URL: process.env['GITHUB_API_URL'] },
 }).then(
   (code) => {
     process.exitCode = code;

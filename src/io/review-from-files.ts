@@ -124,15 +124,48 @@ async function pairIfBoth(
   return { paired: { ...paired, split: bp.split }, notes };
 }
 
+/** The config file (explicit, or `.github/fitgap.yml` under `cwd` when it exists) and its sha256. */
+export async function loadReviewConfig(
+  cwd: string,
+  config?: string,
+): Promise<{ config: ConfigFile; file: InputFile | null }> {
+  const configPath = resolve(cwd, config ?? DEFAULT_CONFIG_PATH);
+  const loaded = await loadConfig(configPath, config ?? DEFAULT_CONFIG_PATH, config !== undefined);
+  if (loaded === null) return { config: {}, file: null };
+  return {
+    config: loaded.config,
+    file: {
+      path: config ?? DEFAULT_CONFIG_PATH,
+      sha256: createHash('sha256').update(loaded.text).digest('hex'),
+    },
+  };
+}
+
+/**
+ * The review of two loaded runs: same metric checked, predictions paired when both ship them.
+ * Throws `InputError` when the runs cannot be compared.
+ */
+export async function reviewLoadedRuns(
+  baseline: LoadedRun,
+  candidate: LoadedRun,
+  config: ConfigFile,
+  overrides?: SettingsOverrides,
+): Promise<Review> {
+  const mismatch = sameMetric(baseline, candidate);
+  if (mismatch.length > 0) throw new InputError(mismatch);
+  const { paired, notes } = await pairIfBoth(baseline, candidate);
+  return buildReview({
+    baseline: baseline.artifact,
+    candidate: candidate.artifact,
+    settings: resolveSettings(config, overrides),
+    ...(paired === undefined ? {} : { paired }),
+    notes: [...baseline.notes, ...candidate.notes, ...notes],
+  });
+}
+
 export async function reviewFiles(options: ReviewFilesOptions): Promise<ReviewFilesResult> {
   const cwd = options.cwd ?? '.';
-  const configPath = resolve(cwd, options.config ?? DEFAULT_CONFIG_PATH);
-  const loaded = await loadConfig(
-    configPath,
-    options.config ?? DEFAULT_CONFIG_PATH,
-    options.config !== undefined,
-  );
-  const config = loaded?.config ?? {};
+  const { config, file: configFile } = await loadReviewConfig(cwd, options.config);
   const epochLog = config['epoch-log'];
   const load = (path: string): Promise<LoadedRun> =>
     loadRun(resolve(cwd, path), {
@@ -151,29 +184,13 @@ export async function reviewFiles(options: ReviewFilesOptions): Promise<ReviewFi
     throw new InputError(issues);
   const baseline = b.value;
   const candidate = c.value;
-  const mismatch = sameMetric(baseline, candidate);
-  if (mismatch.length > 0) throw new InputError(mismatch);
-
-  const { paired, notes } = await pairIfBoth(baseline, candidate);
-  const review = buildReview({
-    baseline: baseline.artifact,
-    candidate: candidate.artifact,
-    settings: resolveSettings(config, options.overrides),
-    ...(paired === undefined ? {} : { paired }),
-    notes: [...baseline.notes, ...candidate.notes, ...notes],
-  });
+  const review = await reviewLoadedRuns(baseline, candidate, config, options.overrides);
   return {
     review,
     files: {
       baseline: { path: options.baseline, sha256: baseline.sha256 },
       candidate: { path: options.candidate, sha256: candidate.sha256 },
-      config:
-        loaded === null
-          ? null
-          : {
-              path: options.config ?? DEFAULT_CONFIG_PATH,
-              sha256: createHash('sha256').update(loaded.text).digest('hex'),
-            },
+      config: configFile,
     },
   };
 }

@@ -26,6 +26,10 @@ test('inputs and their defaults', () => {
     'min-effect': null,
     'status-check': 'auto',
     'report-artifact': 'fitgap-report',
+    'pull-request': null,
+    'base-sha': null,
+    'head-sha': null,
+    'audit-comment': 'false',
     'archive-limit-mb': '50',
   });
 });
@@ -39,6 +43,8 @@ test('outputs', () => {
     'report-path',
     'report-dir',
     'comment-url',
+    'audit-record',
+    'audit-record-path',
   ]);
 });
 
@@ -48,7 +54,9 @@ test('runs the bundled entry on node24', () => {
 });
 
 test('every input the settings reader asks for is declared, and every declared one is read', () => {
-  const source = readFileSync(join(ROOT, 'src/entries/action/settings.ts'), 'utf8');
+  const source = ['settings.ts', 'audit-settings.ts']
+    .map((f) => readFileSync(join(ROOT, 'src/entries/action', f), 'utf8'))
+    .join('\n');
   const read = new Set(
     [
       ...source.matchAll(/(?:optional|required|oneOf(?:<\w+>)?|number|getInput)\(\s*'([a-z-]+)'/g),
@@ -58,7 +66,7 @@ test('every input the settings reader asks for is declared, and every declared o
 });
 
 test('every output the action sets is declared', () => {
-  const sources = ['publish-steps.ts']
+  const sources = ['publish-steps.ts', 'audit-mode.ts']
     .map((f) => readFileSync(join(ROOT, 'src/entries/action', f), 'utf8'))
     .join('\n');
   const set = new Set([...sources.matchAll(/setOutput\('([a-z-]+)'/g)].map((m) => m[1]));

@@ -30,6 +30,8 @@ const MAIN_HELP = `fitgap - bias/variance review of a model-training change
 Usage:
   fitgap review --baseline FILE --candidate FILE [options]
   fitgap validate FILE...
+  fitgap audit --range A..B --artifact PATH [options]
+  fitgap audit --repo OWNER/NAME --pull-request N [options]
   fitgap demo [NAME]
   fitgap curves import --from FORMAT PATH... --out FILE
   fitgap --version
@@ -37,6 +39,7 @@ Usage:
 Commands:
   review     compare two run artifacts and print the review
   validate   check run artifacts (.json) or config files (.yml) and exit
+  audit      re-run reviews over a git range, or a past pull request's review
   demo       review the bundled demo scenario
   curves     import a training log (CSV, TensorBoard, MLflow, evals_result) as a curve
 

@@ -50,11 +50,16 @@ export class FakeRepo {
   readonly owner = 'o';
   readonly repo = 'r';
   comments: Comment[] = [];
-  pulls = new Map<number, { headSha: string; headRepo: string; baseRef: string }>();
+  pulls = new Map<
+    number,
+    { headSha: string; headRepo: string; baseRef: string; baseSha?: string }
+  >();
   checkRuns: Json[] = [];
   statuses: Json[] = [];
   runs: WorkflowRun[] = [];
   artifacts: Artifact[] = [];
+  /** Committed files: commit sha → path → bytes (contents API). */
+  files = new Map<string, Map<string, Uint8Array>>();
   private nextId = 1000;
   private clock = Date.parse('2026-11-30T10:00:00Z');
 
@@ -118,7 +123,11 @@ export class FakeRepo {
       number,
       requested_teams: [],
       head: { ...head, sha: pull.headSha, repo: headRepo, ref: 'feature' },
-      base: { ...(base['base'] as Json), ref: pull.baseRef },
+      base: {
+        ...(base['base'] as Json),
+        ref: pull.baseRef,
+        ...(pull.baseSha === undefined ? {} : { sha: pull.baseSha }),
+      },
     };
   }
 
@@ -294,6 +303,53 @@ export class FakeRepo {
         return {
           status: 302,
           headers: { location: `${s.url}/storage/artifacts/${artifact.id}.zip?sig=abc` },
+        };
+      }),
+    );
+    s.on(
+      'GET /repos/{owner}/{repo}/actions/runs/{run_id}',
+      authed((r) => {
+        const run = this.runs.find((x) => x.id === Number(r.params['run_id']));
+        return run === undefined
+          ? apiError(404, 'Not Found')
+          : { status: 200, body: this.runJson(run) };
+      }),
+    );
+    s.on(
+      'GET /repos/{owner}/{repo}/commits/{ref}',
+      authed((r) => {
+        const ref = r.params['ref'] ?? '';
+        const found = [...this.files.keys()].filter(
+          (sha) => sha.startsWith(ref) && ref.length >= 4,
+        );
+        if (found.length !== 1)
+          return apiError(found.length === 0 ? 404 : 422, 'No commit found for SHA: ' + ref);
+        const sha = found[0] ?? '';
+        return {
+          status: 200,
+          body: { ...example<Json>('commit'), sha, node_id: `C_${sha}`, files: [] },
+        };
+      }),
+    );
+    s.on(
+      'GET /repos/{owner}/{repo}/contents/{path}',
+      authed((r) => {
+        const path = r.params['path'] ?? '';
+        const ref = r.url.searchParams.get('ref') ?? '';
+        const bytes = this.files.get(ref)?.get(path);
+        if (bytes === undefined) return apiError(404, 'Not Found');
+        const base = example<Json>('content-file-response-if-content-is-a-file');
+        return {
+          status: 200,
+          body: {
+            ...base,
+            type: 'file',
+            encoding: 'base64',
+            size: bytes.length,
+            name: path.split('/').pop(),
+            path,
+            content: Buffer.from(bytes).toString('base64'),
+          },
         };
       }),
     );

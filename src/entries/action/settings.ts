@@ -9,7 +9,7 @@ import type { Issue } from '../../model/errors.js';
 import { failOnIssues } from '../../io/load-config.js';
 import { isValidCommentKey } from '../../report/marker.js';
 
-export type ActionMode = 'review' | 'publish';
+export type ActionMode = 'review' | 'publish' | 'audit';
 export type CommentMode = 'update' | 'new' | 'off';
 /** How the gate is published besides the step's own result. `auto`: a check run in publish mode. */
 export type StatusCheckMode = 'auto' | 'check-run' | 'commit-status' | 'off';
@@ -109,7 +109,7 @@ function number(name: string, issues: Issue[], min: number, max: number): number
 /** Reads every input and the runner environment. Throws `InputError` listing all bad inputs. */
 export function readSettings(env: Env = process.env): Settings {
   const issues: Issue[] = [];
-  const mode = oneOf<ActionMode>('mode', ['review', 'publish'], issues);
+  const mode = oneOf<ActionMode>('mode', ['review', 'publish', 'audit'], issues);
   const candidate = mode === 'review' ? required('candidate', issues) : optional('candidate');
   const baseline = optional('baseline');
   const baselineArtifact = optional('baseline-artifact');

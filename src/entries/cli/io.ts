@@ -9,4 +9,12 @@ export interface CliIo {
   /** Folder holding the bundled demo scenario. */
   demoDir: string;
   version: string;
+  /** Standard error as a stream, for the audit's progress bar (drawn only when it is a TTY). */
+  stderrStream?: NodeJS.WritableStream & { isTTY?: boolean; columns?: number };
+  /** The environment variables a command may read (`GITHUB_TOKEN`, `GITHUB_API_URL`). */
+  env?: Readonly<Record<string, string | undefined>>;
+  /** The clock, for the audit record's `recordedAt`. @default () => new Date() */
+  now?: () => Date;
+  /** Folder for temporary files. @default os.tmpdir() */
+  tempDir?: string;
 }

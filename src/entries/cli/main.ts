@@ -1,5 +1,6 @@
 /** Dispatches a CLI invocation to its command and maps errors to exit codes. */
 import { EXIT, InputError, UsageError } from '../../model/errors.js';
+import { auditCommand } from './audit.js';
 import { demoCommand, reviewCommand, validateCommand } from './commands.js';
 import { curvesCommand } from './curves-import.js';
 import { MAIN_HELP } from './help.js';
@@ -17,6 +18,8 @@ export async function runCli(argv: string[], io: CliIo): Promise<number> {
         return await demoCommand(rest, io);
       case 'curves':
         return await curvesCommand(rest, io);
+      case 'audit':
+        return await auditCommand(rest, io);
       case '--version':
       case '-v':
         io.stdout(`${io.version}\n`);

@@ -31,6 +31,10 @@ export interface FindArtifactOptions {
   excludeRunId?: number;
   /** Runs inspected at most, newest first. @default 5 */
   maxRuns?: number;
+  /** `owner/repo` whose runs count (a fork PR's runs carry the fork). @default this repository */
+  headRepository?: string;
+  /** What the not-found message blames. @default 'input "baseline-artifact"' */
+  label?: string;
 }
 
 /** The workflow file name from `owner/repo/.github/workflows/train.yml@refs/heads/main`. */
@@ -42,7 +46,7 @@ export function workflowFileFromRef(ref: string): string | null {
 /** The newest successful run's artifact of that name. Throws `InputError` naming what was searched. */
 export async function findArtifact(options: FindArtifactOptions): Promise<ArtifactRef> {
   const { octokit, repo, filter, name } = options;
-  const fullName = `${repo.owner}/${repo.repo}`;
+  const fullName = options.headRepository ?? `${repo.owner}/${repo.repo}`;
   const { data } = await octokit.rest.actions.listWorkflowRuns({
     ...repo,
     workflow_id: options.workflow,
@@ -72,7 +76,7 @@ export async function findArtifact(options: FindArtifactOptions): Promise<Artifa
   const where = 'branch' in filter ? `on branch "${filter.branch}"` : `for commit ${filter.sha}`;
   throw new InputError([
     {
-      file: 'input "baseline-artifact"',
+      file: options.label ?? 'input "baseline-artifact"',
       pointer: '',
       expected:
         `found no artifact named "${name}" in the ${runs.length} newest successful runs of ` +
