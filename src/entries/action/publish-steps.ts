@@ -32,6 +32,11 @@ export function setReviewOutputs(
   io.setOutput('report-dir', reportDir);
 }
 
+/** The step's failure message when the gate failed. */
+export function gateFailure(review: Review): string {
+  return `fitgap gate failed:\n${review.gate.reasons.map((r) => `- ${r}`).join('\n')}`;
+}
+
 export function runUrl(context: RunContext): string {
   return `${context.serverUrl}/${context.repo.owner}/${context.repo.repo}/actions/runs/${context.runId}`;
 }
