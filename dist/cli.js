@@ -413,11 +413,11 @@ var require_codegen = __commonJS({
         const rhs = this.rhs === void 0 ? "" : ` = ${this.rhs}`;
         return `${varKind} ${this.name}${rhs};` + _n;
       }
-      optimizeNames(names, constants) {
+      optimizeNames(names, constants2) {
         if (!names[this.name.str])
           return;
         if (this.rhs)
-          this.rhs = optimizeExpr(this.rhs, names, constants);
+          this.rhs = optimizeExpr(this.rhs, names, constants2);
         return this;
       }
       get names() {
@@ -434,10 +434,10 @@ var require_codegen = __commonJS({
       render({ _n }) {
         return `${this.lhs} = ${this.rhs};` + _n;
       }
-      optimizeNames(names, constants) {
+      optimizeNames(names, constants2) {
         if (this.lhs instanceof code_1.Name && !names[this.lhs.str] && !this.sideEffects)
           return;
-        this.rhs = optimizeExpr(this.rhs, names, constants);
+        this.rhs = optimizeExpr(this.rhs, names, constants2);
         return this;
       }
       get names() {
@@ -498,8 +498,8 @@ var require_codegen = __commonJS({
       optimizeNodes() {
         return `${this.code}` ? this : void 0;
       }
-      optimizeNames(names, constants) {
-        this.code = optimizeExpr(this.code, names, constants);
+      optimizeNames(names, constants2) {
+        this.code = optimizeExpr(this.code, names, constants2);
         return this;
       }
       get names() {
@@ -528,12 +528,12 @@ var require_codegen = __commonJS({
         }
         return nodes.length > 0 ? this : void 0;
       }
-      optimizeNames(names, constants) {
+      optimizeNames(names, constants2) {
         const { nodes } = this;
         let i = nodes.length;
         while (i--) {
           const n = nodes[i];
-          if (n.optimizeNames(names, constants))
+          if (n.optimizeNames(names, constants2))
             continue;
           subtractNames(names, n.names);
           nodes.splice(i, 1);
@@ -586,12 +586,12 @@ var require_codegen = __commonJS({
           return void 0;
         return this;
       }
-      optimizeNames(names, constants) {
+      optimizeNames(names, constants2) {
         var _a;
-        this.else = (_a = this.else) === null || _a === void 0 ? void 0 : _a.optimizeNames(names, constants);
-        if (!(super.optimizeNames(names, constants) || this.else))
+        this.else = (_a = this.else) === null || _a === void 0 ? void 0 : _a.optimizeNames(names, constants2);
+        if (!(super.optimizeNames(names, constants2) || this.else))
           return;
-        this.condition = optimizeExpr(this.condition, names, constants);
+        this.condition = optimizeExpr(this.condition, names, constants2);
         return this;
       }
       get names() {
@@ -614,10 +614,10 @@ var require_codegen = __commonJS({
       render(opts) {
         return `for(${this.iteration})` + super.render(opts);
       }
-      optimizeNames(names, constants) {
-        if (!super.optimizeNames(names, constants))
+      optimizeNames(names, constants2) {
+        if (!super.optimizeNames(names, constants2))
           return;
-        this.iteration = optimizeExpr(this.iteration, names, constants);
+        this.iteration = optimizeExpr(this.iteration, names, constants2);
         return this;
       }
       get names() {
@@ -653,10 +653,10 @@ var require_codegen = __commonJS({
       render(opts) {
         return `for(${this.varKind} ${this.name} ${this.loop} ${this.iterable})` + super.render(opts);
       }
-      optimizeNames(names, constants) {
-        if (!super.optimizeNames(names, constants))
+      optimizeNames(names, constants2) {
+        if (!super.optimizeNames(names, constants2))
           return;
-        this.iterable = optimizeExpr(this.iterable, names, constants);
+        this.iterable = optimizeExpr(this.iterable, names, constants2);
         return this;
       }
       get names() {
@@ -698,11 +698,11 @@ var require_codegen = __commonJS({
         (_b = this.finally) === null || _b === void 0 ? void 0 : _b.optimizeNodes();
         return this;
       }
-      optimizeNames(names, constants) {
+      optimizeNames(names, constants2) {
         var _a, _b;
-        super.optimizeNames(names, constants);
-        (_a = this.catch) === null || _a === void 0 ? void 0 : _a.optimizeNames(names, constants);
-        (_b = this.finally) === null || _b === void 0 ? void 0 : _b.optimizeNames(names, constants);
+        super.optimizeNames(names, constants2);
+        (_a = this.catch) === null || _a === void 0 ? void 0 : _a.optimizeNames(names, constants2);
+        (_b = this.finally) === null || _b === void 0 ? void 0 : _b.optimizeNames(names, constants2);
         return this;
       }
       get names() {
@@ -1003,7 +1003,7 @@ var require_codegen = __commonJS({
     function addExprNames(names, from) {
       return from instanceof code_1._CodeOrName ? addNames(names, from.names) : names;
     }
-    function optimizeExpr(expr, names, constants) {
+    function optimizeExpr(expr, names, constants2) {
       if (expr instanceof code_1.Name)
         return replaceName(expr);
       if (!canOptimize(expr))
@@ -1018,14 +1018,14 @@ var require_codegen = __commonJS({
         return items;
       }, []));
       function replaceName(n) {
-        const c = constants[n.str];
+        const c = constants2[n.str];
         if (c === void 0 || names[n.str] !== 1)
           return n;
         delete names[n.str];
         return c;
       }
       function canOptimize(e) {
-        return e instanceof code_1._Code && e._items.some((c) => c instanceof code_1.Name && names[c.str] === 1 && constants[c.str] !== void 0);
+        return e instanceof code_1._Code && e._items.some((c) => c instanceof code_1.Name && names[c.str] === 1 && constants2[c.str] !== void 0);
       }
     }
     function subtractNames(names, from) {
@@ -2987,7 +2987,7 @@ var require_compile = __commonJS({
       const schOrFunc = root.refs[ref];
       if (schOrFunc)
         return schOrFunc;
-      let _sch = resolve4.call(this, root, ref);
+      let _sch = resolve6.call(this, root, ref);
       if (_sch === void 0) {
         const schema = (_a = root.localRefs) === null || _a === void 0 ? void 0 : _a[ref];
         const { schemaId } = this.opts;
@@ -3014,7 +3014,7 @@ var require_compile = __commonJS({
     function sameSchemaEnv(s1, s2) {
       return s1.schema === s2.schema && s1.root === s2.root && s1.baseId === s2.baseId;
     }
-    function resolve4(root, ref) {
+    function resolve6(root, ref) {
       let sch;
       while (typeof (sch = this.refs[ref]) == "string")
         ref = sch;
@@ -3878,7 +3878,7 @@ var require_fast_uri = __commonJS({
       }
       return uri;
     }
-    function resolve4(baseURI, relativeURI, options) {
+    function resolve6(baseURI, relativeURI, options) {
       const schemelessOptions = options ? Object.assign({ scheme: "null" }, options) : { scheme: "null" };
       const {
         parsed: baseParsed,
@@ -3914,50 +3914,50 @@ var require_fast_uri = __commonJS({
       schemelessOptions.skipEscape = true;
       return serialize2(resolved, schemelessOptions);
     }
-    function resolveComponent(base, relative2, options, skipNormalization) {
+    function resolveComponent(base, relative3, options, skipNormalization) {
       const target = {};
       if (!skipNormalization) {
         base = parse(serialize2(base, options), options);
-        relative2 = parse(serialize2(relative2, options), options);
+        relative3 = parse(serialize2(relative3, options), options);
       }
       options = options || {};
-      if (!options.tolerant && relative2.scheme) {
-        target.scheme = relative2.scheme;
-        target.userinfo = relative2.userinfo;
-        target.host = relative2.host;
-        target.port = relative2.port;
-        target.path = removeDotSegments(relative2.path || "");
-        target.query = relative2.query;
+      if (!options.tolerant && relative3.scheme) {
+        target.scheme = relative3.scheme;
+        target.userinfo = relative3.userinfo;
+        target.host = relative3.host;
+        target.port = relative3.port;
+        target.path = removeDotSegments(relative3.path || "");
+        target.query = relative3.query;
       } else {
-        if (relative2.userinfo !== void 0 || relative2.host !== void 0 || relative2.port !== void 0) {
-          target.userinfo = relative2.userinfo;
-          target.host = relative2.host;
-          target.port = relative2.port;
-          target.path = removeDotSegments(relative2.path || "");
-          target.query = relative2.query;
+        if (relative3.userinfo !== void 0 || relative3.host !== void 0 || relative3.port !== void 0) {
+          target.userinfo = relative3.userinfo;
+          target.host = relative3.host;
+          target.port = relative3.port;
+          target.path = removeDotSegments(relative3.path || "");
+          target.query = relative3.query;
         } else {
-          if (!relative2.path) {
+          if (!relative3.path) {
             target.path = base.path;
-            if (relative2.query !== void 0) {
-              target.query = relative2.query;
+            if (relative3.query !== void 0) {
+              target.query = relative3.query;
             } else {
               target.query = base.query;
             }
           } else {
-            if (relative2.path[0] === "/") {
-              target.path = removeDotSegments(relative2.path);
+            if (relative3.path[0] === "/") {
+              target.path = removeDotSegments(relative3.path);
             } else {
               const baseHasAuthority = base.userinfo !== void 0 || base.host !== void 0 || base.port !== void 0;
               if (baseHasAuthority && !base.path) {
-                target.path = "/" + relative2.path;
+                target.path = "/" + relative3.path;
               } else if (!base.path) {
-                target.path = relative2.path;
+                target.path = relative3.path;
               } else {
-                target.path = base.path.slice(0, base.path.lastIndexOf("/") + 1) + relative2.path;
+                target.path = base.path.slice(0, base.path.lastIndexOf("/") + 1) + relative3.path;
               }
               target.path = base.scheme === void 0 && !baseHasAuthority && target.path[0] !== "/" ? removeDotSegmentsRelative(target.path) : removeDotSegments(target.path);
             }
-            target.query = relative2.query;
+            target.query = relative3.query;
           }
           target.userinfo = base.userinfo;
           target.host = base.host;
@@ -3965,7 +3965,7 @@ var require_fast_uri = __commonJS({
         }
         target.scheme = base.scheme;
       }
-      target.fragment = relative2.fragment;
+      target.fragment = relative3.fragment;
       return target;
     }
     function equal(uriA, uriB, options) {
@@ -4269,7 +4269,7 @@ var require_fast_uri = __commonJS({
     var fastUri = {
       SCHEMES,
       normalize,
-      resolve: resolve4,
+      resolve: resolve6,
       resolveComponent,
       equal,
       serialize: serialize2,
@@ -16014,28 +16014,28 @@ var require_jstat = __commonJS({
           var distinctNumbers = [];
           var numberCounts = {};
           for (i = 0; i < arr.length; i++) {
-            var number2 = arr[i];
-            if (numberCounts[number2]) {
-              numberCounts[number2]++;
+            var number = arr[i];
+            if (numberCounts[number]) {
+              numberCounts[number]++;
             } else {
-              numberCounts[number2] = 1;
-              distinctNumbers.push(number2);
+              numberCounts[number] = 1;
+              distinctNumbers.push(number);
             }
           }
           var sortedDistinctNumbers = distinctNumbers.sort(ascNum);
           var numberRanks = {};
           var currentRank = 1;
           for (i = 0; i < sortedDistinctNumbers.length; i++) {
-            var number2 = sortedDistinctNumbers[i];
-            var count2 = numberCounts[number2];
+            var number = sortedDistinctNumbers[i];
+            var count2 = numberCounts[number];
             var first = currentRank;
             var last = currentRank + count2 - 1;
             var rank = (first + last) / 2;
-            numberRanks[number2] = rank;
+            numberRanks[number] = rank;
             currentRank += count2;
           }
-          return arr.map(function(number3) {
-            return numberRanks[number3];
+          return arr.map(function(number2) {
+            return numberRanks[number2];
           });
         };
         jStat3.mode = function mode(arr) {
@@ -19264,7 +19264,6 @@ var require_jstat = __commonJS({
 });
 
 // src/entries/cli.ts
-import { writeFile } from "node:fs/promises";
 import { fileURLToPath } from "node:url";
 
 // src/model/errors.ts
@@ -19316,12 +19315,114 @@ var UsageError = class extends Error {
 
 // src/entries/cli/commands.ts
 import { readdir } from "node:fs/promises";
-import { join as join2, resolve as resolve3 } from "node:path";
+import { join, resolve as resolve4 } from "node:path";
 
 // src/io/load-run.ts
 import { createHash } from "node:crypto";
-import { readFile, stat } from "node:fs/promises";
-import { dirname, relative, resolve, sep } from "node:path";
+import { lstat } from "node:fs/promises";
+import { dirname as dirname2, relative as relative2, resolve as resolve2, sep } from "node:path";
+
+// src/model/limits.ts
+var MAX_MAGNITUDE = 1e15;
+var MAX_CURVE_POINTS = 1e4;
+var MAX_JSON_DEPTH = 64;
+function formatLimit(value) {
+  if (value !== 0 && (Math.abs(value) >= 1e6 || Math.abs(value) < 1e-6))
+    return value.toExponential().replace("e+", "e");
+  return String(value);
+}
+
+// src/model/settings.ts
+var FAIL_ON_VALUES = [
+  "worse-validation",
+  "toward-overfitting",
+  "toward-underfitting",
+  "worse-on-both",
+  "any-movement",
+  "slice-regression",
+  "high-bias",
+  "high-variance",
+  "data-mismatch",
+  "validation-overfit",
+  "none"
+];
+function isFailOn(value) {
+  return FAIL_ON_VALUES.includes(value);
+}
+var DEFAULT_SETTINGS = {
+  alpha: 0.05,
+  minEffect: 0,
+  gapTolerance: 0.1,
+  failOn: ["worse-validation"]
+};
+var NUMBER_SETTINGS = {
+  alpha: { min: 1e-6, max: 0.5, about: "significance level" },
+  "min-effect": { min: 0, max: MAX_MAGNITUDE, about: "smallest change that counts" },
+  "gap-tolerance": { min: 0, max: 1, about: "component present at this fraction of the error" },
+  reference: { min: -MAX_MAGNITUDE, max: MAX_MAGNITUDE, about: "reference level" }
+};
+var DECIMAL = /^[+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:[eE][+-]?\d+)?$/;
+function parseDecimal(text) {
+  const trimmed = text.trim();
+  if (!DECIMAL.test(trimmed)) return null;
+  const value = Number(trimmed);
+  return Number.isFinite(value) ? value : null;
+}
+function rangeText(name) {
+  const { min, max } = NUMBER_SETTINGS[name];
+  return `must be a number from ${formatLimit(min)} to ${formatLimit(max)}`;
+}
+function numberSettingIssues(name, value, source) {
+  const { min, max } = NUMBER_SETTINGS[name];
+  if (Number.isFinite(value) && value >= min && value <= max) return [];
+  return [{ ...source, expected: rangeText(name), got: quote(value) }];
+}
+function parseNumberSetting(name, text, source) {
+  const value = parseDecimal(text);
+  if (value === null)
+    return { issues: [{ ...source, expected: rangeText(name), got: quote(text) }] };
+  const issues = numberSettingIssues(name, value, source);
+  return issues.length > 0 ? { issues } : { value };
+}
+var FAIL_ON_SEPARATORS = /[,\n]/;
+function failOnIssues(values, source) {
+  const at = (i) => source.pointer === "" ? "" : `${source.pointer}/${i}`;
+  if (values.length === 0) {
+    return [
+      {
+        ...source,
+        expected: "must name at least one outcome",
+        got: "an empty list",
+        hint: "Write 'none' for a gate that never fails, or leave the setting out for the default (worse-validation)."
+      }
+    ];
+  }
+  const issues = values.flatMap(
+    (value, i) => isFailOn(value) ? [] : [
+      {
+        ...source,
+        pointer: at(i),
+        expected: `must be one of ${FAIL_ON_VALUES.join(", ")}`,
+        got: quote(value),
+        hint: "Separate outcomes with commas or new lines."
+      }
+    ]
+  );
+  if (issues.length === 0 && values.length > 1 && values.includes("none")) {
+    issues.push({
+      ...source,
+      pointer: at(values.indexOf("none")),
+      expected: "must not combine 'none' with other outcomes",
+      got: quote(values.join(","))
+    });
+  }
+  return issues;
+}
+function parseFailOn(text, source) {
+  const values = text.split(FAIL_ON_SEPARATORS).map((s) => s.trim()).filter((s) => s !== "");
+  const issues = failOnIssues(values, source);
+  return issues.length > 0 ? { issues } : { value: values };
+}
 
 // src/artifact/epoch-log.ts
 function splitCsvLine(line) {
@@ -19330,6 +19431,22 @@ function splitCsvLine(line) {
 function parseEpochLog(text, file, mapping) {
   const lines = text.replace(/^\uFEFF/, "").split(/\r?\n/);
   const header = splitCsvLine(lines[0] ?? "");
+  const seen = /* @__PURE__ */ new Map();
+  header.forEach((name, i) => {
+    const first = seen.get(name);
+    if (first !== void 0) {
+      throw new InputError([
+        {
+          file,
+          pointer: "line 1",
+          expected: `must name each column once (column ${i + 1} repeats column ${first + 1})`,
+          got: quote(name),
+          hint: "Rename one of the columns; a repeated name makes the mapping ambiguous."
+        }
+      ]);
+    }
+    seen.set(name, i);
+  });
   const column = (name, role) => {
     if (name === void 0) return void 0;
     const index = header.indexOf(name);
@@ -19357,14 +19474,15 @@ function parseEpochLog(text, file, mapping) {
     const cells = splitCsvLine(raw);
     const read = (index, name) => {
       const cell = cells[index] ?? "";
-      const value = cell === "" ? Number.NaN : Number(cell);
-      if (!Number.isFinite(value)) {
+      const value = parseDecimal(cell) ?? Number.NaN;
+      if (!Number.isFinite(value) || Math.abs(value) > MAX_MAGNITUDE) {
         issues.push({
           file,
           pointer: `line ${i + 1}`,
-          expected: `column "${name}" must be a finite number`,
+          expected: `column "${name}" must be a decimal number within \xB1${formatLimit(MAX_MAGNITUDE)}`,
           got: quote(cell)
         });
+        return Number.NaN;
       }
       return value;
     };
@@ -19381,11 +19499,133 @@ function parseEpochLog(text, file, mapping) {
     }
     points.push(point);
     if (issues.length >= 10) break;
+    if (points.length > MAX_CURVE_POINTS) {
+      issues.push({
+        file,
+        pointer: `line ${i + 1}`,
+        expected: `must have at most ${MAX_CURVE_POINTS} data rows (a curve's limit)`,
+        hint: "Log less often, or keep every n-th row."
+      });
+      break;
+    }
   }
   if (issues.length > 0) throw new InputError(issues);
   if (points.length === 0)
     throw new InputError([{ file, pointer: "", expected: "has no data rows under its header" }]);
   return points;
+}
+
+// src/validate/ajv-issues.ts
+function valueAt(doc, pointer) {
+  if (pointer === "") return doc;
+  let node = doc;
+  for (const raw of pointer.slice(1).split("/")) {
+    const key = raw.replace(/~1/g, "/").replace(/~0/g, "~");
+    if (node === null || typeof node !== "object") return void 0;
+    node = node[key];
+  }
+  return node;
+}
+function escapePointerToken(token) {
+  return token.replace(/~/g, "~0").replace(/\//g, "~1");
+}
+function typeName(value) {
+  if (value === null) return "null";
+  if (Array.isArray(value)) return "an array";
+  if (typeof value === "object") return "an object";
+  return `${typeof value} ${quote(value)}`;
+}
+function oneIssue(error, file, doc) {
+  const pointer = error.instancePath;
+  const value = valueAt(doc, pointer);
+  const params = error.params;
+  switch (error.keyword) {
+    case "required":
+      return {
+        file,
+        pointer: pointer === "" ? "/" : pointer,
+        expected: `must have the key "${String(params["missingProperty"])}"`,
+        hint: "Add it; see schema/fitgap-run-1.schema.json for the format."
+      };
+    case "additionalProperties": {
+      const key = String(params["additionalProperty"]);
+      return {
+        file,
+        pointer: `${pointer}/${escapePointerToken(key)}`,
+        expected: "is not a known key",
+        hint: "Check the spelling; unknown keys are rejected so that a typo cannot pass silently."
+      };
+    }
+    case "type":
+      return {
+        file,
+        pointer,
+        expected: `must be ${String(params["type"]) === "integer" ? "an integer" : `of type ${String(params["type"])}`}`,
+        got: typeName(value),
+        ...params["type"] === "number" && typeof value === "string" ? { hint: "Write numbers without quotes." } : {}
+      };
+    case "enum":
+      return {
+        file,
+        pointer,
+        expected: `must be one of ${params["allowedValues"].map((v) => quote(v)).join(", ")}`,
+        got: quote(value)
+      };
+    case "const":
+      return {
+        file,
+        pointer,
+        expected: `must be ${quote(params["allowedValue"])}`,
+        got: quote(value)
+      };
+    case "format":
+      return {
+        file,
+        pointer,
+        expected: `must be a ${String(params["format"])} string`,
+        got: quote(value),
+        ...params["format"] === "date-time" ? { hint: 'Use RFC 3339, e.g. "2026-11-30T10:00:00Z".' } : {}
+      };
+    default:
+      return {
+        file,
+        pointer,
+        expected: error.message ?? `fails ${error.keyword}`,
+        got: quote(value)
+      };
+  }
+}
+function ajvIssues(errors, file, doc) {
+  const seen = /* @__PURE__ */ new Set();
+  const issues = [];
+  for (const error of errors) {
+    const issue = oneIssue(error, file, doc);
+    const key = `${issue.pointer}|${issue.expected}`;
+    if (seen.has(key)) continue;
+    seen.add(key);
+    issues.push(issue);
+  }
+  return issues;
+}
+function outOfRangeNumbers(doc, maxMagnitude, max = 10) {
+  const found = [];
+  const stack = [[doc, ""]];
+  while (stack.length > 0 && found.length < max) {
+    const [node, pointer] = stack.pop();
+    if (typeof node === "number") {
+      if (!Number.isFinite(node) || Math.abs(node) > maxMagnitude)
+        found.push({ pointer, value: node });
+    } else if (Array.isArray(node)) {
+      for (let i = node.length - 1; i >= 0; i--) stack.push([node[i], `${pointer}/${i}`]);
+    } else if (node !== null && typeof node === "object") {
+      const entries = Object.entries(node);
+      for (let i = entries.length - 1; i >= 0; i--) {
+        const [k, v] = entries[i];
+        stack.push([v, `${pointer}/${escapePointerToken(k)}`]);
+      }
+    }
+  }
+  return found;
 }
 
 // src/artifact/read-json.ts
@@ -19411,13 +19651,79 @@ function errorOffset(text, message) {
   }
   return null;
 }
-function parseJson(text, file) {
+var QUOTE = 34;
+var BACKSLASH = 92;
+function decodeKey(raw) {
+  if (!raw.includes("\\")) return raw;
   try {
-    return JSON.parse(text.charCodeAt(0) === 65279 ? text.slice(1) : text);
+    return JSON.parse(`"${raw}"`);
+  } catch {
+    return null;
+  }
+}
+function scanStructure(text, maxDepth = MAX_JSON_DEPTH) {
+  const stack = [];
+  const duplicates = [];
+  const pointer = () => stack.slice(0, -1).map((f) => `/${f.object ? escapePointerToken(f.at) : String(f.index)}`).join("");
+  for (let i = 0; i < text.length; i++) {
+    const c = text.charCodeAt(i);
+    if (c === QUOTE) {
+      const start = i + 1;
+      i++;
+      while (i < text.length && text.charCodeAt(i) !== QUOTE) {
+        if (text.charCodeAt(i) === BACKSLASH) i++;
+        i++;
+      }
+      const top = stack[stack.length - 1];
+      if (top?.object === true && top.expectKey) {
+        const key = decodeKey(text.slice(start, i));
+        top.expectKey = false;
+        if (key !== null) {
+          top.at = key;
+          if (top.keys.has(key) && duplicates.length < 10) {
+            duplicates.push({ pointer: `${pointer()}/${escapePointerToken(key)}`, key });
+          }
+          top.keys.add(key);
+        }
+      }
+      continue;
+    }
+    if (c === 123 || c === 91) {
+      if (stack.length >= maxDepth) return { tooDeep: i, duplicates };
+      stack.push({ object: c === 123, keys: /* @__PURE__ */ new Set(), at: "", index: 0, expectKey: c === 123 });
+    } else if (c === 125 || c === 93) {
+      stack.pop();
+    } else if (c === 44) {
+      const top = stack[stack.length - 1];
+      if (top !== void 0) {
+        if (top.object) top.expectKey = true;
+        else top.index++;
+      }
+    }
+  }
+  return { tooDeep: -1, duplicates };
+}
+function parseJson(text, file) {
+  const body = text.charCodeAt(0) === 65279 ? text.slice(1) : text;
+  const structure = scanStructure(body);
+  if (structure.tooDeep >= 0) {
+    const where = lineAndColumn(body, structure.tooDeep);
+    throw new InputError([
+      {
+        file,
+        pointer: `line ${where.line}, column ${where.column}`,
+        expected: `must not nest arrays and objects more than ${MAX_JSON_DEPTH} levels deep`,
+        hint: "A run artifact nests about five levels; flatten deep hyperparameter values."
+      }
+    ]);
+  }
+  let doc;
+  try {
+    doc = JSON.parse(body);
   } catch (error) {
     const message = error instanceof Error ? error.message : String(error);
-    const offset = errorOffset(text, message);
-    const where = offset === null ? void 0 : lineAndColumn(text, offset);
+    const offset = errorOffset(body, message);
+    const where = offset === null ? void 0 : lineAndColumn(body, offset);
     throw new InputError([
       {
         file,
@@ -19428,6 +19734,18 @@ function parseJson(text, file) {
       }
     ]);
   }
+  if (structure.duplicates.length > 0) {
+    throw new InputError(
+      structure.duplicates.map(({ pointer, key }) => ({
+        file,
+        pointer,
+        expected: "must appear once in its object",
+        got: `the key ${quote(key)} again`,
+        hint: "JSON keeps only the last of duplicate keys; remove the one you did not mean."
+      }))
+    );
+  }
+  return doc;
 }
 
 // src/validate/run.ts
@@ -19652,110 +19970,6 @@ var fitgap_run_1_schema_default = {
   }
 };
 
-// src/validate/ajv-issues.ts
-function valueAt(doc, pointer) {
-  if (pointer === "") return doc;
-  let node = doc;
-  for (const raw of pointer.slice(1).split("/")) {
-    const key = raw.replace(/~1/g, "/").replace(/~0/g, "~");
-    if (node === null || typeof node !== "object") return void 0;
-    node = node[key];
-  }
-  return node;
-}
-function escapePointerToken(token) {
-  return token.replace(/~/g, "~0").replace(/\//g, "~1");
-}
-function typeName(value) {
-  if (value === null) return "null";
-  if (Array.isArray(value)) return "an array";
-  if (typeof value === "object") return "an object";
-  return `${typeof value} ${quote(value)}`;
-}
-function oneIssue(error, file, doc) {
-  const pointer = error.instancePath;
-  const value = valueAt(doc, pointer);
-  const params = error.params;
-  switch (error.keyword) {
-    case "required":
-      return {
-        file,
-        pointer: pointer === "" ? "/" : pointer,
-        expected: `must have the key "${String(params["missingProperty"])}"`,
-        hint: "Add it; see schema/fitgap-run-1.schema.json for the format."
-      };
-    case "additionalProperties": {
-      const key = String(params["additionalProperty"]);
-      return {
-        file,
-        pointer: `${pointer}/${escapePointerToken(key)}`,
-        expected: "is not a known key",
-        hint: "Check the spelling; unknown keys are rejected so that a typo cannot pass silently."
-      };
-    }
-    case "type":
-      return {
-        file,
-        pointer,
-        expected: `must be ${String(params["type"]) === "integer" ? "an integer" : `of type ${String(params["type"])}`}`,
-        got: typeName(value),
-        ...params["type"] === "number" && typeof value === "string" ? { hint: "Write numbers without quotes." } : {}
-      };
-    case "enum":
-      return {
-        file,
-        pointer,
-        expected: `must be one of ${params["allowedValues"].map((v) => quote(v)).join(", ")}`,
-        got: quote(value)
-      };
-    case "const":
-      return {
-        file,
-        pointer,
-        expected: `must be ${quote(params["allowedValue"])}`,
-        got: quote(value)
-      };
-    case "format":
-      return {
-        file,
-        pointer,
-        expected: `must be a ${String(params["format"])} string`,
-        got: quote(value),
-        ...params["format"] === "date-time" ? { hint: 'Use RFC 3339, e.g. "2026-11-30T10:00:00Z".' } : {}
-      };
-    default:
-      return {
-        file,
-        pointer,
-        expected: error.message ?? `fails ${error.keyword}`,
-        got: quote(value)
-      };
-  }
-}
-function ajvIssues(errors, file, doc) {
-  const seen = /* @__PURE__ */ new Set();
-  const issues = [];
-  for (const error of errors) {
-    const issue = oneIssue(error, file, doc);
-    const key = `${issue.pointer}|${issue.expected}`;
-    if (seen.has(key)) continue;
-    seen.add(key);
-    issues.push(issue);
-  }
-  return issues;
-}
-function nonFiniteNumbers(doc, pointer = "") {
-  if (typeof doc === "number") return Number.isFinite(doc) ? [] : [pointer];
-  if (Array.isArray(doc))
-    return doc.flatMap((item, i) => nonFiniteNumbers(item, `${pointer}/${i}`));
-  if (doc !== null && typeof doc === "object") {
-    return Object.entries(doc).flatMap(
-      ([k, v]) => nonFiniteNumbers(v, `${pointer}/${escapePointerToken(k)}`)
-    );
-  }
-  return [];
-}
-
 // src/model/run.ts
 var SPLIT_NAMES = ["train", "train_dev", "validation", "test"];
 var CURVE_NAMES = ["epochs", "training_examples", "regularization"];
@@ -19805,6 +20019,16 @@ function semanticIssues(run, file) {
   for (const name of CURVE_NAMES) {
     const curve = run.curves?.[name];
     if (curve === void 0) continue;
+    if (curve.length > MAX_CURVE_POINTS) {
+      issues.push({
+        file,
+        pointer: `/curves/${name}`,
+        expected: `must have at most ${MAX_CURVE_POINTS} points`,
+        got: `${curve.length} points`,
+        hint: "Log the curve less often, or keep every n-th point before writing the artifact."
+      });
+      continue;
+    }
     curve.forEach((point, i) => {
       const at = `/curves/${name}/${i}`;
       inUnit(point.validation, `${at}/validation`);
@@ -19869,16 +20093,24 @@ function semanticIssues(run, file) {
   return issues;
 }
 function validateRun(doc, file) {
-  const nonFinite = nonFiniteNumbers(doc);
-  if (nonFinite.length > 0) {
+  const numbers = outOfRangeNumbers(doc, MAX_MAGNITUDE);
+  if (numbers.length > 0) {
     throw new InputError(
-      nonFinite.map((pointer) => ({
-        file,
-        pointer,
-        expected: "must be a finite number",
-        got: "a number too large to represent (Infinity)",
-        hint: "Write the measured value; JSON numbers such as 1e999 overflow."
-      }))
+      numbers.map(
+        ({ pointer, value }) => Number.isFinite(value) ? {
+          file,
+          pointer,
+          expected: `must be within \xB1${formatLimit(MAX_MAGNITUDE)}`,
+          got: quote(value),
+          hint: pointer.startsWith("/hyperparameters/") ? "Write large identifiers (seeds, hashes) as strings." : "Rescale the metric (thousands instead of units); larger values overflow in the statistics."
+        } : {
+          file,
+          pointer,
+          expected: "must be a finite number",
+          got: "a number too large to represent (Infinity)",
+          hint: "Write the measured value; JSON numbers such as 1e999 overflow."
+        }
+      )
     );
   }
   const validate = validator();
@@ -19890,38 +20122,298 @@ function validateRun(doc, file) {
   return doc;
 }
 
-// src/io/load-run.ts
-async function readText(path, file, what) {
-  try {
-    return await readFile(path);
-  } catch (error) {
-    const code = error.code;
-    throw new InputError([
-      {
-        file,
-        pointer: "",
-        expected: `could not be read as ${what}`,
-        got: code === "ENOENT" ? "no such file" : code === "EISDIR" ? "a directory" : code ?? String(error),
-        hint: "Check the path."
-      }
-    ]);
+// src/io/open-untrusted.ts
+import { constants } from "node:fs";
+import { open, realpath } from "node:fs/promises";
+import { Readable } from "node:stream";
+import { dirname, isAbsolute, relative, resolve } from "node:path";
+var MIB = 1024 * 1024;
+var DEFAULT_FILE_LIMITS = {
+  artifactBytes: 16 * MIB,
+  configBytes: 1 * MIB,
+  csvBytes: 512 * MIB
+};
+var LIMIT_NAMES = {
+  artifactBytes: { option: "max-artifact-mb", config: "artifact-mb" },
+  configBytes: { option: "max-config-mb", config: null },
+  csvBytes: { option: "max-csv-mb", config: "csv-mb" }
+};
+var LIMIT_RANGES_MB = {
+  artifactBytes: { min: 1e-3, max: 1024 },
+  configBytes: { min: 1e-3, max: 64 },
+  csvBytes: { min: 1e-3, max: 65536 }
+};
+function parseLimitMb(key, text, label) {
+  const { min, max } = LIMIT_RANGES_MB[key];
+  const value = /^\s*(?:\d+(?:\.\d*)?|\.\d+)\s*$/.test(text) ? Number(text) : Number.NaN;
+  if (!(value >= min && value <= max)) {
+    return {
+      issues: [
+        {
+          file: label,
+          pointer: "",
+          expected: `must be a number of MB from ${min} to ${max}`,
+          got: JSON.stringify(text)
+        }
+      ]
+    };
+  }
+  return { bytes: Math.round(value * MIB) };
+}
+var LIMIT_HINTS = {
+  artifactBytes: 'Raise the limit with --max-artifact-mb (action input "max-artifact-mb", config limits.artifact-mb) if the file is genuine.',
+  configBytes: 'Raise the limit with --max-config-mb (action input "max-config-mb") if the file is genuine.',
+  csvBytes: 'Raise the limit with --max-csv-mb (action input "max-csv-mb", config limits.csv-mb) if the file is genuine.'
+};
+var READ_CHUNK = 64 * 1024;
+var MissingFileError = class extends InputError {
+};
+function refuse(target, expected, got, hint) {
+  const issue = { file: target.file, pointer: "", expected };
+  if (got !== void 0) issue.got = got;
+  if (hint !== void 0) issue.hint = hint;
+  throw new InputError([issue]);
+}
+function describeCode(code) {
+  switch (code) {
+    case "ENOENT":
+      return "no such file";
+    case "EACCES":
+    case "EPERM":
+      return "permission denied";
+    case "ELOOP":
+      return "a symbolic link where none may be (or a loop of links)";
+    case "EISDIR":
+      return "a folder";
+    case "ENOTDIR":
+      return "a path through something that is not a folder";
+    case "ENXIO":
+      return "a socket or a device without a reader";
+    case "ENAMETOOLONG":
+      return "a name too long for the file system";
+    case "EIO":
+      return "an input/output error";
+    case "EMFILE":
+    case "ENFILE":
+      return "too many open files";
+    default:
+      return code ?? "an unknown error";
   }
 }
+function errorCode(error) {
+  return error?.code;
+}
+function isInside(folder, path) {
+  const rel = relative(folder, path);
+  return rel !== "" && !rel.startsWith("..") && !isAbsolute(rel);
+}
+function kindOf(stats) {
+  if (stats.isDirectory()) return "a folder";
+  if (stats.isFIFO()) return "a named pipe (FIFO)";
+  if (stats.isSocket()) return "a socket";
+  if (stats.isCharacterDevice() || stats.isBlockDevice()) return "a device";
+  if (stats.isSymbolicLink()) return "a symbolic link";
+  return "not a regular file";
+}
+var MB = (bytes) => `${Math.round(bytes / MIB * 1e3) / 1e3} MB`;
+async function openChecked(target) {
+  const path = resolve(target.path);
+  const where = `could not be read as ${target.what}`;
+  let folder;
+  let real;
+  try {
+    folder = await realpath(resolve(target.folder ?? dirname(path)));
+    real = await realpath(path);
+  } catch (error) {
+    const code = errorCode(error);
+    if (code === "ENOENT")
+      throw new MissingFileError([
+        {
+          file: target.file,
+          pointer: "",
+          expected: where,
+          got: "no such file",
+          hint: "Check the path."
+        }
+      ]);
+    refuse(target, where, describeCode(code), "Check the path.");
+  }
+  if (!isInside(folder, real)) {
+    refuse(
+      target,
+      `must be a file inside ${target.folder === void 0 ? "the folder it is named in" : "the artifact's folder"}`,
+      "a link that leads outside it",
+      "Copy the file there instead of linking to it."
+    );
+  }
+  let handle;
+  try {
+    handle = await open(
+      real,
+      constants.O_RDONLY | constants.O_NOFOLLOW | constants.O_NONBLOCK | constants.O_NOCTTY
+    );
+  } catch (error) {
+    refuse(target, where, describeCode(errorCode(error)), "Check the path and its permissions.");
+  }
+  try {
+    const stats = await handle.stat();
+    if (!stats.isFile()) refuse(target, `must be a regular file (${target.what})`, kindOf(stats));
+    const opened = await realpath(`/proc/self/fd/${handle.fd}`).catch(() => null);
+    if (opened !== null && opened !== real && !isInside(folder, opened)) {
+      refuse(target, "must not change while it is opened", "a path that moved outside its folder");
+    }
+    const max = target.limits[target.limit];
+    if (stats.size > max) {
+      refuse(
+        target,
+        `must be at most ${MB(max)} (${max} bytes)`,
+        `${stats.size} bytes`,
+        LIMIT_HINTS[target.limit]
+      );
+    }
+    return { handle, size: stats.size, realPath: real, id: `${stats.dev}:${stats.ino}` };
+  } catch (error) {
+    await handle.close().catch(() => void 0);
+    throw error;
+  }
+}
+function grew(target) {
+  refuse(
+    target,
+    `must be a regular file of fixed size (${target.what})`,
+    "more bytes than its size promised",
+    "Files that change while read (logs being written, files under /proc) are refused; copy it first."
+  );
+}
+async function readAt(target, handle, buffer, at) {
+  try {
+    const { bytesRead } = await handle.read(buffer, 0, buffer.length, at);
+    return bytesRead;
+  } catch (error) {
+    refuse(target, `could not be read as ${target.what}`, describeCode(errorCode(error)));
+  }
+}
+async function readChecked(target) {
+  const file = await openChecked(target);
+  try {
+    const bytes = Buffer.alloc(file.size);
+    let at = 0;
+    while (at < file.size) {
+      const n = await readAt(target, file.handle, bytes.subarray(at), at);
+      if (n === 0) break;
+      at += n;
+    }
+    if (await readAt(target, file.handle, Buffer.alloc(1), at) > 0) grew(target);
+    return { bytes: at === file.size ? bytes : bytes.subarray(0, at), file };
+  } finally {
+    await file.handle.close().catch(() => void 0);
+  }
+}
+async function streamChecked(target) {
+  const file = await openChecked(target);
+  async function* chunks() {
+    try {
+      let at = 0;
+      while (at < file.size) {
+        const buffer = Buffer.alloc(Math.min(READ_CHUNK, file.size - at));
+        const n = await readAt(target, file.handle, buffer, at);
+        if (n === 0) return;
+        at += n;
+        yield n === buffer.length ? buffer : buffer.subarray(0, n);
+      }
+      if (await readAt(target, file.handle, Buffer.alloc(1), at) > 0) grew(target);
+    } finally {
+      await file.handle.close().catch(() => void 0);
+    }
+  }
+  return { stream: Readable.from(chunks(), { objectMode: false }), file };
+}
+function firstInvalidUtf8(bytes) {
+  let i = 0;
+  while (i < bytes.length) {
+    const b = bytes[i] ?? 0;
+    if (b < 128) {
+      i++;
+      continue;
+    }
+    let need;
+    let low = 128;
+    let high = 191;
+    if (b >= 194 && b <= 223) need = 1;
+    else if (b >= 224 && b <= 239) {
+      need = 2;
+      if (b === 224) low = 160;
+      if (b === 237) high = 159;
+    } else if (b >= 240 && b <= 244) {
+      need = 3;
+      if (b === 240) low = 144;
+      if (b === 244) high = 143;
+    } else return i;
+    for (let k = 1; k <= need; k++) {
+      const c = bytes[i + k];
+      if (c === void 0 || c < (k === 1 ? low : 128) || c > (k === 1 ? high : 191)) return i;
+    }
+    i += need + 1;
+  }
+  return -1;
+}
+function decodeUtf8(bytes, file, what) {
+  const bad = firstInvalidUtf8(bytes);
+  if (bad < 0)
+    return Buffer.from(bytes.buffer, bytes.byteOffset, bytes.byteLength).toString("utf8");
+  let line = 1;
+  for (let i = 0; i < bad; i++) if (bytes[i] === 10) line++;
+  throw new InputError([
+    {
+      file,
+      pointer: `line ${line}`,
+      expected: `must be UTF-8 text (${what})`,
+      got: "an invalid UTF-8 sequence",
+      hint: bytes[0] === 255 && bytes[1] === 254 || bytes[0] === 254 && bytes[1] === 255 ? "The file looks like UTF-16; save it as UTF-8." : "Save the file as UTF-8."
+    }
+  ]);
+}
+
+// src/io/load-run.ts
 function besideArtifact(artifactPath, name) {
-  const folder = resolve(dirname(artifactPath));
-  const target = resolve(folder, name);
-  const rel = relative(folder, target);
-  if (rel === "" || rel.startsWith("..") || rel.includes(`..${sep}`) || resolve(folder, rel) !== target)
+  const folder = resolve2(dirname2(artifactPath));
+  const target = resolve2(folder, name);
+  const rel = relative2(folder, target);
+  if (rel === "" || rel.startsWith("..") || rel.includes(`..${sep}`) || resolve2(folder, rel) !== target)
     return null;
   return target;
 }
+function besideName(file, name) {
+  return `${dirname2(file) === "." ? "" : `${dirname2(file)}/`}${name}`;
+}
+function predictionsSource(target, track) {
+  return {
+    file: target.file,
+    open: async () => {
+      const { stream } = await streamChecked(target);
+      track?.(stream);
+      return stream;
+    }
+  };
+}
 async function loadRun(path, options = {}) {
   const file = options.displayName ?? path;
-  const bytes = await readText(path, file, "a run artifact (JSON)");
+  const limits = options.limits ?? DEFAULT_FILE_LIMITS;
+  const folder = dirname2(resolve2(path));
+  const { bytes, file: checked } = await readChecked({
+    path,
+    file,
+    what: "a run artifact (JSON)",
+    limit: "artifactBytes",
+    limits
+  });
+  const read = [{ realPath: checked.realPath, id: checked.id }];
   const sha256 = createHash("sha256").update(bytes).digest("hex");
-  const artifact = validateRun(parseJson(bytes.toString("utf8"), file), file);
+  const text = decodeUtf8(bytes, file, "a run artifact");
+  const artifact = validateRun(parseJson(text, file), file);
   const notes = [];
   let predictionsPath = null;
+  let predictions = null;
   if (artifact.predictions !== void 0) {
     predictionsPath = besideArtifact(path, artifact.predictions.path);
     const issue = {
@@ -19932,26 +20424,48 @@ async function loadRun(path, options = {}) {
       hint: 'Put the predictions CSV next to the artifact, or remove "predictions".'
     };
     if (predictionsPath === null) throw new InputError([issue]);
-    const info = await stat(predictionsPath).catch(() => null);
-    if (info === null || !info.isFile())
-      throw new InputError([
-        { ...issue, expected: "must name an existing file next to the artifact" }
-      ]);
+    const target = {
+      path: predictionsPath,
+      file: besideName(file, artifact.predictions.path),
+      what: "a predictions CSV",
+      folder,
+      limit: "csvBytes",
+      limits
+    };
+    const first = await openChecked(target).catch((error) => {
+      if (error instanceof MissingFileError)
+        throw new InputError([
+          { ...issue, expected: "must name an existing file next to the artifact" }
+        ]);
+      throw error;
+    });
+    await first.handle.close();
+    read.push({ realPath: first.realPath, id: first.id });
+    predictions = predictionsSource(target, options.track);
   }
   if (options.epochLog !== void 0) {
     const logPath = besideArtifact(path, options.epochLog.file);
-    const logName = `${dirname(file) === "." ? "" : `${dirname(file)}/`}${options.epochLog.file}`;
-    const info = logPath === null ? null : await stat(logPath).catch(() => null);
-    if (logPath !== null && info?.isFile() === true) {
+    const logName = besideName(file, options.epochLog.file);
+    const present = logPath !== null && await lstat(logPath).catch(() => null) !== null;
+    if (logPath !== null && present) {
       if (artifact.curves?.epochs !== void 0) {
         notes.push(
           `${file}: the artifact has its own curves.epochs; the epoch log ${logName} was not used.`
         );
       } else {
-        const text = (await readText(logPath, logName, "an epoch log (CSV)")).toString("utf8");
+        const log = await readChecked({
+          path: logPath,
+          file: logName,
+          what: "an epoch log (CSV)",
+          folder,
+          limit: "artifactBytes",
+          limits
+        });
+        read.push({ realPath: log.file.realPath, id: log.file.id });
+        const logText = decodeUtf8(log.bytes, logName, "an epoch log");
         artifact.curves = {
           ...artifact.curves,
-          epochs: parseEpochLog(text, logName, options.epochLog)
+          epochs: parseEpochLog(logText, logName, options.epochLog)
         };
         const issues = semanticIssues(artifact, `${file} (with ${logName})`);
         if (issues.length > 0) throw new InputError(issues);
@@ -19962,13 +20476,12 @@ async function loadRun(path, options = {}) {
       );
     }
   }
-  return { artifact, file, sha256, predictionsPath, notes };
+  return { artifact, file, sha256, predictionsPath, predictions, notes, read };
 }
 
 // src/io/load-config.ts
 var import__2 = __toESM(require__(), 1);
 var import_yaml = __toESM(require_dist2(), 1);
-import { readFile as readFile2 } from "node:fs/promises";
 
 // schema/fitgap-config.schema.json
 var fitgap_config_schema_default = {
@@ -19980,29 +20493,56 @@ var fitgap_config_schema_default = {
   properties: {
     alpha: {
       type: "number",
-      exclusiveMinimum: 0,
-      exclusiveMaximum: 0.5,
-      description: "Significance level; default 0.05."
+      minimum: 1e-6,
+      maximum: 0.5,
+      description: "Significance level of every test, from 0.000001 to 0.5; default 0.05."
     },
     "min-effect": {
       type: "number",
       minimum: 0,
-      description: "Smallest change, in metric units, that counts; default 0."
+      maximum: 1e15,
+      description: "Smallest change, in metric units, that counts; from 0 to 1e15; default 0."
     },
     "gap-tolerance": {
       type: "number",
       minimum: 0,
       maximum: 1,
-      description: "A component counts as present at this fraction of the validation error level; default 0.10."
+      description: "A component counts as present at this fraction of the validation error level, from 0 to 1; default 0.10."
     },
     reference: {
       type: "number",
-      description: "Reference level (human-level, prior system, Bayes error) overriding the artifacts'."
+      minimum: -1e15,
+      maximum: 1e15,
+      description: "Reference level (human-level, prior system, Bayes error) overriding the artifacts'; within [0, 1] for a proportion metric."
     },
     "fail-on": {
-      type: "array",
-      items: { type: "string" },
-      description: "Outcomes that fail the gate; see README 'Gate'."
+      description: "Outcomes that fail the gate: a list, or one text with the outcomes separated by commas or new lines. 'none' never fails and stands alone; an empty list is refused.",
+      oneOf: [
+        {
+          type: "string",
+          minLength: 1
+        },
+        {
+          type: "array",
+          minItems: 1,
+          items: {
+            type: "string",
+            enum: [
+              "worse-validation",
+              "toward-overfitting",
+              "toward-underfitting",
+              "worse-on-both",
+              "any-movement",
+              "slice-regression",
+              "high-bias",
+              "high-variance",
+              "data-mismatch",
+              "validation-overfit",
+              "none"
+            ]
+          }
+        }
+      ]
     },
     "epoch-log": {
       type: "object",
@@ -20015,7 +20555,11 @@ var fitgap_config_schema_default = {
           minLength: 1,
           description: "CSV file name, relative to each artifact's folder."
         },
-        x: { type: "string", minLength: 1, description: "Column holding the epoch." },
+        x: {
+          type: "string",
+          minLength: 1,
+          description: "Column holding the epoch."
+        },
         train: {
           type: "string",
           minLength: 1,
@@ -20027,69 +20571,157 @@ var fitgap_config_schema_default = {
           description: "Column holding the validation metric."
         }
       }
+    },
+    limits: {
+      type: "object",
+      additionalProperties: false,
+      description: "Byte limits of the input files, in MB (see SECURITY.md). The config file's own limit is set by --max-config-mb or the action input max-config-mb.",
+      properties: {
+        "artifact-mb": {
+          type: "number",
+          minimum: 1e-3,
+          maximum: 1024,
+          description: "Largest run artifact or epoch log; default 16."
+        },
+        "csv-mb": {
+          type: "number",
+          minimum: 1e-3,
+          maximum: 65536,
+          description: "Largest predictions CSV; default 512."
+        }
+      }
     }
   }
-};
-
-// src/model/settings.ts
-var FAIL_ON_VALUES = [
-  "worse-validation",
-  "toward-overfitting",
-  "toward-underfitting",
-  "worse-on-both",
-  "any-movement",
-  "slice-regression",
-  "high-bias",
-  "high-variance",
-  "data-mismatch",
-  "validation-overfit",
-  "none"
-];
-function isFailOn(value) {
-  return FAIL_ON_VALUES.includes(value);
-}
-var DEFAULT_SETTINGS = {
-  alpha: 0.05,
-  minEffect: 0,
-  gapTolerance: 0.1,
-  failOn: ["worse-validation"]
 };
 
 // src/io/load-config.ts
 var compiled2;
 function validator2() {
-  compiled2 ??= new import__2.Ajv2020({ allErrors: true, strict: true }).compile(fitgap_config_schema_default);
+  compiled2 ??= new import__2.Ajv2020({
+    allErrors: true,
+    strict: true,
+    strictNumbers: true
+  }).compile(fitgap_config_schema_default);
   return compiled2;
 }
-function failOnIssues(values, file, pointer) {
-  return values.flatMap(
-    (value, i) => isFailOn(value) ? [] : [
-      {
-        file,
-        pointer: pointer === "" ? "" : `${pointer}/${i}`,
-        expected: `must be one of ${FAIL_ON_VALUES.join(", ")}`,
-        got: quote(value)
+var MAX_FLOW_DEPTH = 16;
+var MAX_BLOCK_PREFIX = 64;
+var MAX_ALIASES = 100;
+function yamlNestingProblem(text) {
+  const lines = text.split("\n");
+  let depth = 0;
+  for (let n = 0; n < lines.length; n++) {
+    const line = lines[n] ?? "";
+    const prefix = /^[\s-]*/.exec(line)?.[0].length ?? 0;
+    if (prefix > MAX_BLOCK_PREFIX)
+      return {
+        line: n + 1,
+        what: `indentation or "- " nesting over ${MAX_BLOCK_PREFIX} characters`
+      };
+    let quoteChar = "";
+    for (let i = 0; i < line.length; i++) {
+      const c = line[i];
+      if (quoteChar !== "") {
+        if (c === quoteChar) quoteChar = "";
+        continue;
       }
-    ]
-  );
+      if (c === '"' || c === "'") quoteChar = c;
+      else if (c === "#" && (i === 0 || /\s/.test(line[i - 1] ?? ""))) break;
+      else if (c === "[" || c === "{") {
+        depth++;
+        if (depth > MAX_FLOW_DEPTH)
+          return { line: n + 1, what: `brackets nested more than ${MAX_FLOW_DEPTH} deep` };
+      } else if (c === "]" || c === "}") depth = Math.max(0, depth - 1);
+    }
+  }
+  return null;
+}
+function lineOf(text, offset) {
+  let line = 1;
+  for (let i = 0; i < offset && i < text.length; i++) if (text.charCodeAt(i) === 10) line++;
+  return line;
 }
 function parseConfig(text, file) {
-  const document = (0, import_yaml.parseDocument)(text, { prettyErrors: true });
+  return checkSettings(parseRaw(text, file), file);
+}
+var NUMBER_KEYS = ["alpha", "min-effect", "gap-tolerance", "reference"];
+var SETTING_KEYS = /* @__PURE__ */ new Set([...NUMBER_KEYS, "fail-on"]);
+function checkSettings(data, file) {
+  const { "fail-on": failOn, ...rest } = data;
+  const issues = [];
+  for (const key of NUMBER_KEYS) {
+    const value = rest[key];
+    if (value === void 0) continue;
+    const source2 = { file, pointer: `/${key}` };
+    if (typeof value !== "number") {
+      issues.push({ ...source2, expected: "must be a number", got: quote(value) });
+    } else issues.push(...numberSettingIssues(key, value, source2));
+  }
+  if (issues.length > 0) throw new InputError(issues);
+  if (failOn === void 0) return rest;
+  const source = { file, pointer: "/fail-on" };
+  if (typeof failOn === "string") {
+    const parsed = parseFailOn(failOn, source);
+    if ("issues" in parsed) throw new InputError(parsed.issues);
+    return { ...rest, "fail-on": parsed.value };
+  }
+  if (!Array.isArray(failOn) || failOn.some((v) => typeof v !== "string")) {
+    throw new InputError([
+      {
+        ...source,
+        expected: "must be a list of outcomes, or one text with outcomes separated by commas",
+        got: quote(failOn)
+      }
+    ]);
+  }
+  const failOnProblems = failOnIssues(failOn, source);
+  if (failOnProblems.length > 0) throw new InputError(failOnProblems);
+  return { ...rest, "fail-on": failOn };
+}
+function parseRaw(text, file) {
+  const nesting = yamlNestingProblem(text);
+  if (nesting !== null) {
+    throw new InputError([
+      {
+        file,
+        pointer: `line ${nesting.line}`,
+        expected: "must not nest deeper than a config needs",
+        got: nesting.what
+      }
+    ]);
+  }
+  const document = (0, import_yaml.parseDocument)(text, { prettyErrors: false, uniqueKeys: true });
   if (document.errors.length > 0) {
     throw new InputError(
       document.errors.slice(0, 10).map((error) => ({
         file,
-        pointer: error.linePos?.[0] ? `line ${error.linePos[0].line}` : "",
+        pointer: `line ${lineOf(text, error.pos[0])}`,
         expected: "is not valid YAML",
-        got: quote(error.message.split("\n")[0] ?? "")
+        got: quote(
+          /call stack/i.test(error.message) ? "nesting too deep" : error.message.split("\n")[0] ?? ""
+        )
       }))
     );
   }
-  const data = document.toJS() ?? {};
+  let data;
+  try {
+    data = document.toJS({ maxAliasCount: MAX_ALIASES }) ?? {};
+  } catch (error) {
+    throw new InputError([
+      {
+        file,
+        pointer: "",
+        expected: `must not expand aliases more than ${MAX_ALIASES} times`,
+        got: quote(error instanceof Error ? error.message.split("\n")[0] : String(error)),
+        hint: "Write the values out; a config needs no anchors (&) or aliases (*)."
+      }
+    ]);
+  }
   const validate = validator2();
-  if (!validate(data)) {
+  const rest = data !== null && typeof data === "object" && !Array.isArray(data) ? Object.fromEntries(Object.entries(data).filter(([key]) => !SETTING_KEYS.has(key))) : data;
+  if (!validate(rest)) {
     throw new InputError(
-      ajvIssues(validate.errors ?? [], file, data).map((issue) => ({
+      ajvIssues(validate.errors ?? [], file, rest).map((issue) => ({
         ...issue,
         hint: issue.hint?.replace(
           "schema/fitgap-run-1.schema.json",
@@ -20098,33 +20730,36 @@ function parseConfig(text, file) {
       }))
     );
   }
-  const issues = failOnIssues(data["fail-on"] ?? [], file, "/fail-on");
-  if (issues.length > 0) throw new InputError(issues);
   return data;
 }
-async function loadConfig(path, file, required) {
-  let text;
+async function loadConfig(path, file, required, limits) {
+  let read;
   try {
-    text = await readFile2(path, "utf8");
+    read = await readChecked({
+      path,
+      file,
+      what: "a config file (YAML)",
+      limit: "configBytes",
+      limits
+    });
   } catch (error) {
-    const code = error.code;
-    if (!required && code === "ENOENT") return null;
-    throw new InputError([
-      {
-        file,
-        pointer: "",
-        expected: "could not be read",
-        got: code ?? String(error),
-        hint: "Check the --config path."
-      }
-    ]);
+    if (!(error instanceof MissingFileError)) throw error;
+    if (!required) return null;
+    throw new InputError(
+      error.issues.map((i) => ({ ...i, hint: "Check the config path." }))
+    );
   }
-  return { config: parseConfig(text, file), text };
+  const text = decodeUtf8(read.bytes, file, "a config file");
+  return {
+    config: parseConfig(text, file),
+    text,
+    checked: { realPath: read.file.realPath, id: read.file.id }
+  };
 }
 
 // src/io/review-from-files.ts
 import { createHash as createHash2 } from "node:crypto";
-import { dirname as dirname2, join, resolve as resolve2 } from "node:path";
+import { resolve as resolve3 } from "node:path";
 
 // src/stats/distributions.ts
 var import_jstat = __toESM(require_jstat(), 1);
@@ -22027,7 +22662,6 @@ function buildReview(input) {
 }
 
 // src/artifact/predictions.ts
-import { createReadStream } from "node:fs";
 import { createInterface } from "node:readline";
 var HEADER = { proportion: "id,correct", continuous: "id,loss" };
 function hashId(id) {
@@ -22062,23 +22696,27 @@ var HashLog = class {
 };
 function parseValue(raw, kind, file, line) {
   const column = kind === "proportion" ? "correct" : "loss";
-  const value = raw.trim() === "" ? Number.NaN : Number(raw);
-  if (kind === "proportion" ? value !== 0 && value !== 1 : !Number.isFinite(value)) {
+  const text = raw.trim();
+  const value = kind === "proportion" ? text === "0" || text === "1" ? Number(text) : Number.NaN : parseDecimal(text) ?? Number.NaN;
+  if (!Number.isFinite(value) || Math.abs(value) > MAX_MAGNITUDE) {
     throw new InputError([
       {
         file,
         pointer: `line ${line}`,
-        expected: kind === "proportion" ? `column "${column}" must be 1 or 0` : `column "${column}" must be a finite number`,
+        expected: kind === "proportion" ? `column "${column}" must be 1 or 0` : `column "${column}" must be a decimal number within \xB11e15`,
         got: quote(raw)
       }
     ]);
   }
   return value;
 }
-async function* readRows(path, file, kind, hashes) {
-  const stream = createReadStream(path, { encoding: "utf8" });
+async function* readRows(source, kind, hashes) {
+  const file = source.file;
+  const stream = await source.open();
+  stream.setEncoding("utf8");
   const lines = createInterface({ input: stream, crlfDelay: Infinity });
   let line = 0;
+  let rows = 0;
   try {
     for await (const text of lines) {
       line++;
@@ -22114,6 +22752,7 @@ async function* readRows(path, file, kind, hashes) {
           { file, pointer: `line ${line}`, expected: "must have a non-empty id" }
         ]);
       hashes?.push(hashId(id));
+      rows++;
       yield { id, value: parseValue(text.slice(comma + 1), kind, file, line), line };
     }
   } finally {
@@ -22129,11 +22768,22 @@ async function* readRows(path, file, kind, hashes) {
       }
     ]);
   }
+  if (rows === 0) {
+    throw new InputError([
+      {
+        file,
+        pointer: "",
+        expected: "must have one row per example under its header",
+        got: "no rows"
+      }
+    ]);
+  }
 }
-async function duplicateIssues(path, file, kind, suspects) {
+async function duplicateIssues(source, kind, suspects) {
+  const file = source.file;
   const firstLine = /* @__PURE__ */ new Map();
   const issues = [];
-  for await (const row of readRows(path, file, kind)) {
+  for await (const row of readRows(source, kind)) {
     if (!suspects.has(hashId(row.id))) continue;
     const first = firstLine.get(row.id);
     if (first === void 0) firstLine.set(row.id, row.line);
@@ -22147,11 +22797,20 @@ async function duplicateIssues(path, file, kind, suspects) {
   }
   return issues;
 }
+async function checkPredictions(source, kind) {
+  const hashes = new HashLog();
+  for await (const row of readRows(source, kind, hashes)) void row;
+  const repeated = hashes.repeated();
+  if (repeated.size > 0) {
+    const issues = await duplicateIssues(source, kind, repeated);
+    if (issues.length > 0) throw new InputError(issues);
+  }
+}
 async function pairPredictions(baseline, candidate, kind) {
   const baseHashes = new HashLog();
   const candHashes = new HashLog();
-  const base = readRows(baseline.path, baseline.file, kind, baseHashes);
-  const cand = readRows(candidate.path, candidate.file, kind, candHashes);
+  const base = readRows(baseline, kind, baseHashes);
+  const cand = readRows(candidate, kind, candHashes);
   const waitingBase = /* @__PURE__ */ new Map();
   const waitingCand = /* @__PURE__ */ new Map();
   let rows = 0;
@@ -22191,11 +22850,9 @@ async function pairPredictions(baseline, candidate, kind) {
   }
   const issues = [];
   const baseRepeated = baseHashes.repeated();
-  if (baseRepeated.size > 0)
-    issues.push(...await duplicateIssues(baseline.path, baseline.file, kind, baseRepeated));
+  if (baseRepeated.size > 0) issues.push(...await duplicateIssues(baseline, kind, baseRepeated));
   const candRepeated = candHashes.repeated();
-  if (candRepeated.size > 0)
-    issues.push(...await duplicateIssues(candidate.path, candidate.file, kind, candRepeated));
+  if (candRepeated.size > 0) issues.push(...await duplicateIssues(candidate, kind, candRepeated));
   if (issues.length > 0) throw new InputError(issues);
   const unmatched = { baseline: waitingBase.size, candidate: waitingCand.size };
   if (kind === "proportion") return { kind, rows, baselineOnly, candidateOnly, unmatched };
@@ -22209,6 +22866,30 @@ async function pairPredictions(baseline, candidate, kind) {
 }
 
 // src/io/review-from-files.ts
+var MB2 = 1024 * 1024;
+function resolveLimits(config, given = {}) {
+  const fromConfig = {};
+  const artifactMb = config.limits?.["artifact-mb"];
+  const csvMb = config.limits?.["csv-mb"];
+  if (artifactMb !== void 0) fromConfig.artifactBytes = Math.round(artifactMb * MB2);
+  if (csvMb !== void 0) fromConfig.csvBytes = Math.round(csvMb * MB2);
+  return { ...DEFAULT_FILE_LIMITS, ...fromConfig, ...given };
+}
+function referenceIssues(config, options, configFile, kind) {
+  if (kind !== "proportion") return [];
+  const fromFlag = options.overrides?.reference;
+  const value = fromFlag ?? config.reference;
+  if (value === void 0 || value >= 0 && value <= 1) return [];
+  return [
+    {
+      file: fromFlag !== void 0 ? options.overrideLabel?.("reference") ?? "--reference" : configFile,
+      pointer: fromFlag !== void 0 ? "" : "/reference",
+      expected: "must be within [0, 1] for a proportion metric",
+      got: quote(value),
+      hint: "Write the reference as a fraction (0.02, not 2)."
+    }
+  ];
+}
 var DEFAULT_CONFIG_PATH = ".github/fitgap.yml";
 function resolveSettings(config, overrides = {}) {
   const reference = overrides.reference ?? config.reference;
@@ -22231,28 +22912,40 @@ function sameMetric(baseline, candidate) {
     hint: "Compare runs of the same metric; a review of different metrics would be meaningless."
   }));
 }
+var MIN_PAIRED_ROWS = 2;
 async function pairIfBoth(baseline, candidate) {
   const bp = baseline.artifact.predictions;
   const cp = candidate.artifact.predictions;
-  if (bp === void 0 || cp === void 0 || baseline.predictionsPath === null || candidate.predictionsPath === null) {
-    return {
-      notes: bp !== cp && (bp === void 0 || cp === void 0) ? ["Only one run ships per-example predictions: no paired test."] : []
-    };
+  const kind = candidate.artifact.metric.kind;
+  const unpaired = async (notes2) => {
+    for (const run of [baseline, candidate])
+      if (run.predictions !== null) await checkPredictions(run.predictions, kind);
+    return { notes: notes2 };
+  };
+  if (baseline.predictions === null || candidate.predictions === null || bp === void 0 || cp === void 0) {
+    return unpaired(
+      bp !== cp && (bp === void 0 || cp === void 0) ? ["Only one run ships per-example predictions: no paired test."] : []
+    );
   }
   if (bp.split !== cp.split) {
-    return {
-      notes: [
-        `The predictions are for different splits (${bp.split} vs ${cp.split}): no paired test.`
-      ]
-    };
+    return unpaired([
+      `The predictions are for different splits (${bp.split} vs ${cp.split}): no paired test.`
+    ]);
   }
-  const result = await pairPredictions(
-    { path: baseline.predictionsPath, file: join(dirname2(baseline.file), bp.path) },
-    { path: candidate.predictionsPath, file: join(dirname2(candidate.file), cp.path) },
-    candidate.artifact.metric.kind
-  );
+  const result = await pairPredictions(baseline.predictions, candidate.predictions, kind);
   const notes = [];
   const { unmatched, ...paired } = result;
+  if (result.rows < MIN_PAIRED_ROWS) {
+    throw new InputError([
+      {
+        file: `${baseline.predictions.file} and ${candidate.predictions.file}`,
+        pointer: "",
+        expected: `must share at least ${MIN_PAIRED_ROWS} ids to be paired`,
+        got: `${result.rows} shared (${unmatched.baseline} and ${unmatched.candidate} unmatched rows)`,
+        hint: "Write predictions of the same examples, with the same ids, for both runs."
+      }
+    ]);
+  }
   if (unmatched.baseline + unmatched.candidate > 0) {
     notes.push(
       `Predictions paired by id: ${result.rows} rows in both; ${unmatched.baseline} baseline and ${unmatched.candidate} candidate rows had no partner and were left out of the paired test.`
@@ -22262,64 +22955,106 @@ async function pairIfBoth(baseline, candidate) {
 }
 async function reviewFiles(options) {
   const cwd = options.cwd ?? ".";
-  const configPath = resolve2(cwd, options.config ?? DEFAULT_CONFIG_PATH);
+  const configPath = resolve3(cwd, options.config ?? DEFAULT_CONFIG_PATH);
+  const configFile = options.names?.config ?? options.config ?? DEFAULT_CONFIG_PATH;
   const loaded = await loadConfig(
     configPath,
-    options.config ?? DEFAULT_CONFIG_PATH,
-    options.config !== void 0
+    configFile,
+    options.config !== void 0,
+    resolveLimits({}, options.limits)
   );
   const config = loaded?.config ?? {};
-  const epochLog = config["epoch-log"];
-  const load = (path) => loadRun(resolve2(cwd, path), {
-    displayName: path,
+  const limits = resolveLimits(config, options.limits);
+  const epochLog = options.epochLogs === false ? void 0 : config["epoch-log"];
+  const streams = [];
+  const load = (path, name) => loadRun(resolve3(cwd, path), {
+    displayName: name ?? path,
+    limits,
+    track: (stream) => streams.push(stream),
     ...epochLog === void 0 ? {} : { epochLog }
   });
-  const [b, c] = await Promise.allSettled([load(options.baseline), load(options.candidate)]);
-  const issues = [b, c].flatMap(
-    (r) => r.status === "rejected" ? r.reason instanceof InputError ? r.reason.issues : [] : []
-  );
-  for (const r of [b, c])
-    if (r.status === "rejected" && !(r.reason instanceof InputError)) throw r.reason;
-  if (issues.length > 0 || b.status === "rejected" || c.status === "rejected")
-    throw new InputError(issues);
-  const baseline = b.value;
-  const candidate = c.value;
-  const mismatch = sameMetric(baseline, candidate);
-  if (mismatch.length > 0) throw new InputError(mismatch);
-  const { paired, notes } = await pairIfBoth(baseline, candidate);
-  const review = buildReview({
-    baseline: baseline.artifact,
-    candidate: candidate.artifact,
-    settings: resolveSettings(config, options.overrides),
-    ...paired === void 0 ? {} : { paired },
-    notes: [...baseline.notes, ...candidate.notes, ...notes]
-  });
-  return {
-    review,
-    files: {
-      baseline: { path: options.baseline, sha256: baseline.sha256 },
-      candidate: { path: options.candidate, sha256: candidate.sha256 },
-      config: loaded === null ? null : {
-        path: options.config ?? DEFAULT_CONFIG_PATH,
-        sha256: createHash2("sha256").update(loaded.text).digest("hex")
-      }
-    }
-  };
+  try {
+    const [b, c] = await Promise.allSettled([
+      load(options.baseline, options.names?.baseline),
+      load(options.candidate, options.names?.candidate)
+    ]);
+    const issues = [b, c].flatMap(
+      (r) => r.status === "rejected" ? r.reason instanceof InputError ? r.reason.issues : [] : []
+    );
+    for (const r of [b, c])
+      if (r.status === "rejected" && !(r.reason instanceof InputError)) throw r.reason;
+    if (issues.length > 0 || b.status === "rejected" || c.status === "rejected")
+      throw new InputError(issues);
+    const baseline = b.value;
+    const candidate = c.value;
+    const mismatch = sameMetric(baseline, candidate);
+    if (mismatch.length > 0) throw new InputError(mismatch);
+    const reference = referenceIssues(config, options, configFile, candidate.artifact.metric.kind);
+    if (reference.length > 0) throw new InputError(reference);
+    const { paired, notes } = await pairIfBoth(baseline, candidate);
+    const review = buildReview({
+      baseline: baseline.artifact,
+      candidate: candidate.artifact,
+      settings: resolveSettings(config, options.overrides),
+      ...paired === void 0 ? {} : { paired },
+      notes: [...baseline.notes, ...candidate.notes, ...notes]
+    });
+    return {
+      review,
+      files: {
+        baseline: { path: baseline.file, sha256: baseline.sha256 },
+        candidate: { path: candidate.file, sha256: candidate.sha256 },
+        config: loaded === null ? null : {
+          path: configFile,
+          sha256: createHash2("sha256").update(loaded.text).digest("hex")
+        }
+      },
+      runs: { baseline, candidate },
+      read: [...loaded === null ? [] : [loaded.checked], ...baseline.read, ...candidate.read]
+    };
+  } finally {
+    for (const stream of streams) stream.destroy();
+  }
 }
 
 // src/entries/cli/args.ts
 import { parseArgs } from "node:util";
 var FORMATS = ["text", "markdown", "json"];
+var NEGATIVE_NUMBER = /^-(?:\d|\.\d)/;
+function joinNegativeValues(argv, options) {
+  const out = [];
+  for (let i = 0; i < argv.length; i++) {
+    const token = argv[i] ?? "";
+    if (token === "--") {
+      out.push(...argv.slice(i));
+      break;
+    }
+    const name = token.startsWith("--") && !token.includes("=") ? token.slice(2) : null;
+    const next = argv[i + 1];
+    if (name !== null && options[name]?.type === "string" && next !== void 0 && NEGATIVE_NUMBER.test(next)) {
+      out.push(`${token}=${next}`);
+      i++;
+    } else out.push(token);
+  }
+  return out;
+}
 function parseFlags(argv, options, command) {
   try {
-    const parsed = parseArgs({ args: argv, options, allowPositionals: true, strict: true });
+    const parsed = parseArgs({
+      args: joinNegativeValues(argv, options),
+      options,
+      allowPositionals: true,
+      strict: true
+    });
     return {
       values: parsed.values,
       positionals: parsed.positionals
     };
   } catch (error) {
     const message = error instanceof Error ? error.message.split("\n")[0] ?? "" : String(error);
-    throw new UsageError(`fitgap ${command}: ${message}. Run 'fitgap ${command} --help'.`);
+    throw new UsageError(
+      `fitgap ${command}: ${message.replace(/\.+$/, "")}. Run 'fitgap ${command} --help'.`
+    );
   }
 }
 function parseFormat(value, command) {
@@ -22330,30 +23065,55 @@ function parseFormat(value, command) {
     `fitgap ${command}: --format must be one of ${FORMATS.join(", ")} (got ${JSON.stringify(value)}).`
   );
 }
-function number(values, flag, range, command) {
-  const raw = values[flag];
-  if (raw === void 0 || typeof raw !== "string") return void 0;
-  const value = Number(raw);
-  if (raw.trim() === "" || !Number.isFinite(value) || value < range[0] || value > range[1]) {
-    throw new UsageError(
-      `fitgap ${command}: --${flag} must be a number from ${range[0]} to ${range[1]} (got ${JSON.stringify(raw)}).`
-    );
-  }
-  return value;
-}
-function parseOverrides(values, command) {
+var SETTING_FLAGS = {
+  alpha: { type: "string" },
+  "min-effect": { type: "string" },
+  "gap-tolerance": { type: "string" },
+  reference: { type: "string" },
+  "fail-on": { type: "string" }
+};
+var LIMIT_FLAGS = {
+  "max-artifact-mb": { type: "string" },
+  "max-config-mb": { type: "string" },
+  "max-csv-mb": { type: "string" }
+};
+var FIELD = {
+  alpha: "alpha",
+  "min-effect": "minEffect",
+  "gap-tolerance": "gapTolerance",
+  reference: "reference"
+};
+function parseOverrides(values) {
   const out = {};
-  const alpha = number(values, "alpha", [1e-9, 0.5], command);
-  if (alpha !== void 0) out.alpha = alpha;
-  const minEffect = number(values, "min-effect", [0, Number.MAX_VALUE], command);
-  if (minEffect !== void 0) out.minEffect = minEffect;
-  const gap = number(values, "gap-tolerance", [0, 1], command);
-  if (gap !== void 0) out.gapTolerance = gap;
-  const reference = number(values, "reference", [-Number.MAX_VALUE, Number.MAX_VALUE], command);
-  if (reference !== void 0) out.reference = reference;
+  const issues = [];
+  for (const name of Object.keys(FIELD)) {
+    const raw = values[name];
+    if (typeof raw !== "string") continue;
+    const parsed = parseNumberSetting(name, raw, { file: `--${name}`, pointer: "" });
+    if ("issues" in parsed) issues.push(...parsed.issues);
+    else out[FIELD[name]] = parsed.value;
+  }
   const failOn = values["fail-on"];
-  if (typeof failOn === "string")
-    out.failOn = failOn.split(",").map((s) => s.trim()).filter((s) => s !== "");
+  if (typeof failOn === "string") {
+    const parsed = parseFailOn(failOn, { file: "--fail-on", pointer: "" });
+    if ("issues" in parsed) issues.push(...parsed.issues);
+    else out.failOn = parsed.value;
+  }
+  if (issues.length > 0) throw new InputError(issues);
+  return out;
+}
+function parseLimits(values) {
+  const out = {};
+  const issues = [];
+  for (const key of Object.keys(LIMIT_NAMES)) {
+    const option = LIMIT_NAMES[key].option;
+    const raw = values[option];
+    if (typeof raw !== "string") continue;
+    const parsed = parseLimitMb(key, raw, `--${option}`);
+    if ("issues" in parsed) issues.push(...parsed.issues);
+    else out[key] = parsed.bytes;
+  }
+  if (issues.length > 0) throw new InputError(issues);
   return out;
 }
 
@@ -23646,11 +24406,8 @@ var REVIEW_FLAGS = {
   config: { type: "string" },
   format: { type: "string" },
   out: { type: "string" },
-  alpha: { type: "string" },
-  "min-effect": { type: "string" },
-  "gap-tolerance": { type: "string" },
-  reference: { type: "string" },
-  "fail-on": { type: "string" },
+  ...SETTING_FLAGS,
+  ...LIMIT_FLAGS,
   "comment-key": { type: "string" },
   help: { type: "boolean", short: "h" }
 };
@@ -23672,11 +24429,8 @@ async function reviewCommand(argv, io) {
     );
   }
   const format = parseFormat(values["format"], "review");
-  const overrides = parseOverrides(values, "review");
-  if (overrides.failOn !== void 0) {
-    const issues = failOnIssues(overrides.failOn, "--fail-on", "");
-    if (issues.length > 0) throw new InputError(issues);
-  }
+  const overrides = parseOverrides(values);
+  const limits = parseLimits(values);
   const commentKey = values["comment-key"];
   if (typeof commentKey === "string" && !isValidCommentKey(commentKey)) {
     throw new UsageError(
@@ -23689,6 +24443,8 @@ async function reviewCommand(argv, io) {
     candidate,
     cwd: io.cwd,
     overrides,
+    overrideLabel: (name) => `--${name}`,
+    limits,
     ...typeof config === "string" ? { config } : {}
   });
   const text = renderReview(result, format, {
@@ -23697,7 +24453,7 @@ async function reviewCommand(argv, io) {
   });
   const out = values["out"];
   if (typeof out === "string") {
-    await io.writeFile(resolve3(io.cwd, out), text);
+    await io.writeFile(resolve4(io.cwd, out), text, { file: out, inputs: result.read });
     io.stderr(
       `fitgap: review written to ${out} (gate ${result.review.gate.pass ? "passed" : "failed"}).
 `
@@ -23708,7 +24464,7 @@ async function reviewCommand(argv, io) {
 async function validateCommand(argv, io) {
   const { values, positionals } = parseFlags(
     argv,
-    { help: { type: "boolean", short: "h" } },
+    { help: { type: "boolean", short: "h" }, config: { type: "string" }, ...LIMIT_FLAGS },
     "validate"
   );
   if (values["help"] === true) {
@@ -23717,17 +24473,34 @@ async function validateCommand(argv, io) {
   }
   if (positionals.length === 0)
     throw new UsageError("fitgap validate: name at least one file. Run 'fitgap validate --help'.");
+  const given = parseLimits(values);
+  const configName = typeof values["config"] === "string" ? values["config"] : void 0;
+  const loaded = await loadConfig(
+    resolve4(io.cwd, configName ?? DEFAULT_CONFIG_PATH),
+    configName ?? DEFAULT_CONFIG_PATH,
+    configName !== void 0,
+    resolveLimits({}, given)
+  );
+  const config = loaded?.config ?? {};
+  const limits = resolveLimits(config, given);
+  const epochLog = config["epoch-log"];
   let failed = false;
   for (const file of positionals) {
     try {
       if (/\.ya?ml$/i.test(file)) {
-        await loadConfig(resolve3(io.cwd, file), file, true);
+        await loadConfig(resolve4(io.cwd, file), file, true, limits);
         io.stdout(`${file}: valid config
 `);
       } else {
-        const run = await loadRun(resolve3(io.cwd, file), { displayName: file });
+        const run = await loadRun(resolve4(io.cwd, file), {
+          displayName: file,
+          limits,
+          ...epochLog === void 0 ? {} : { epochLog }
+        });
+        if (run.predictions !== null)
+          await checkPredictions(run.predictions, run.artifact.metric.kind);
         io.stdout(
-          `${file}: valid run artifact "${run.artifact.run.name}" (${run.artifact.splits.train.values.length} repeat(s))
+          `${file}: valid run artifact "${run.artifact.run.name}" (${run.artifact.splits.train.values.length} repeat(s)${run.predictions === null ? "" : ", predictions checked"})
 `
         );
       }
@@ -23736,7 +24509,7 @@ async function validateCommand(argv, io) {
       failed = true;
       for (const issue of error.issues.slice(0, 10))
         io.stderr(
-          `${formatIssue({ ...issue, file: issue.file === resolve3(io.cwd, file) ? file : issue.file })}
+          `${formatIssue({ ...issue, file: issue.file === resolve4(io.cwd, file) ? file : issue.file })}
 `
         );
       if (error.issues.length > 10)
@@ -23770,9 +24543,9 @@ async function demoCommand(argv, io) {
     );
   const format = parseFormat(values["format"], "demo");
   const result = await reviewFiles({
-    baseline: join2(io.demoDir, "baseline.json"),
-    candidate: join2(io.demoDir, `${name}.json`),
-    config: join2(io.demoDir, "fitgap.yml"),
+    baseline: join(io.demoDir, "baseline.json"),
+    candidate: join(io.demoDir, `${name}.json`),
+    config: join(io.demoDir, "fitgap.yml"),
     cwd: io.cwd
   });
   io.stdout(renderReview(result, format, { color: io.color }));
@@ -23822,6 +24595,47 @@ async function runCli(argv, io) {
       return EXIT.badInput;
     }
     throw error;
+  }
+}
+
+// src/io/write-output.ts
+import { realpath as realpath2, stat, writeFile } from "node:fs/promises";
+import { basename, dirname as dirname3, join as join2, resolve as resolve5 } from "node:path";
+function refuse2(file, expected, got, hint) {
+  throw new InputError([{ file, pointer: "", expected, got, hint }]);
+}
+async function realTarget(path) {
+  const real = await realpath2(path).catch(() => null);
+  if (real !== null) return real;
+  const folder = await realpath2(dirname3(path)).catch(() => null);
+  return folder === null ? null : join2(folder, basename(path));
+}
+async function writeOutput(path, text, file, inputs) {
+  const target = resolve5(path);
+  const real = await realTarget(target);
+  const info = await stat(target).catch(() => null);
+  const id = info === null ? null : `${info.dev}:${info.ino}`;
+  if (inputs.some((input) => input.realPath === real || id !== null && input.id === id)) {
+    refuse2(
+      file,
+      "must not name one of the review's input files (--out)",
+      "an input file",
+      "Write the review to a new file."
+    );
+  }
+  if (info?.isDirectory() === true)
+    refuse2(file, "could not be written (--out)", "a folder", "Name a file, not a folder.");
+  try {
+    await writeFile(target, text, "utf8");
+  } catch (error) {
+    const code = error.code;
+    const got = code === "ENOENT" ? "no such folder" : code === "ENOSPC" ? "no space left on the device" : code === "EROFS" ? "a read-only file system" : describeCode(code);
+    refuse2(
+      file,
+      "could not be written (--out)",
+      got,
+      "Check that the folder exists and can be written to."
+    );
   }
 }
 
@@ -23891,12 +24705,22 @@ var package_default = {
 
 // src/entries/cli.ts
 var version = package_default.version;
+var closed = false;
+var quietOnClose = (error) => {
+  if (error.code === "EPIPE") closed = true;
+  else throw error;
+};
+process.stdout.on("error", quietOnClose);
+process.stderr.on("error", quietOnClose);
+var write = (stream) => (text) => {
+  if (!closed) stream.write(text);
+};
 runCli(process.argv.slice(2), {
-  stdout: (text) => process.stdout.write(text),
-  stderr: (text) => process.stderr.write(text),
+  stdout: write(process.stdout),
+  stderr: write(process.stderr),
   color: process.stdout.isTTY === true && process.env["NO_COLOR"] === void 0,
   cwd: process.cwd(),
-  writeFile: (path, text) => writeFile(path, text, "utf8"),
+  writeFile: (path, text, { file, inputs }) => writeOutput(path, text, file, inputs),
   demoDir: fileURLToPath(new URL("../demo/", import.meta.url)),
   version
 }).then(
@@ -23904,11 +24728,12 @@ runCli(process.argv.slice(2), {
     process.exitCode = code;
   },
   (error) => {
-    process.stderr.write(
-      `fitgap: internal error (a bug; please report it):
+    if (!closed)
+      process.stderr.write(
+        `fitgap: internal error (a bug; please report it):
 ${error instanceof Error ? error.stack ?? error.message : String(error)}
 `
-    );
+      );
     process.exitCode = 3;
   }
 );

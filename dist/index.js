@@ -2172,9 +2172,9 @@ var require_dispatcher_base = __commonJS({
       }
       close(callback) {
         if (callback === void 0) {
-          return new Promise((resolve5, reject) => {
+          return new Promise((resolve6, reject) => {
             this.close((err2, data) => {
-              return err2 ? reject(err2) : resolve5(data);
+              return err2 ? reject(err2) : resolve6(data);
             });
           });
         }
@@ -2212,12 +2212,12 @@ var require_dispatcher_base = __commonJS({
           err2 = null;
         }
         if (callback === void 0) {
-          return new Promise((resolve5, reject) => {
+          return new Promise((resolve6, reject) => {
             this.destroy(err2, (err3, data) => {
               return err3 ? (
                 /* istanbul ignore next: should never error */
                 reject(err3)
-              ) : resolve5(data);
+              ) : resolve6(data);
             });
           });
         }
@@ -4484,8 +4484,8 @@ var require_util2 = __commonJS({
     function createDeferredPromise() {
       let res;
       let rej;
-      const promise = new Promise((resolve5, reject) => {
-        res = resolve5;
+      const promise = new Promise((resolve6, reject) => {
+        res = resolve6;
         rej = reject;
       });
       return { promise, resolve: res, reject: rej };
@@ -5797,7 +5797,7 @@ var require_client_h1 = __commonJS({
       kResume,
       kHTTPContext
     } = require_symbols();
-    var constants3 = require_constants2();
+    var constants4 = require_constants2();
     var EMPTY_BUF = Buffer.alloc(0);
     var FastBuffer = Buffer[Symbol.species];
     var addListener = util.addListener;
@@ -5872,7 +5872,7 @@ var require_client_h1 = __commonJS({
       constructor(client, socket, { exports: exports2 }) {
         assert(Number.isFinite(client[kMaxHeadersSize]) && client[kMaxHeadersSize] > 0);
         this.llhttp = exports2;
-        this.ptr = this.llhttp.llhttp_alloc(constants3.TYPE.RESPONSE);
+        this.ptr = this.llhttp.llhttp_alloc(constants4.TYPE.RESPONSE);
         this.client = client;
         this.socket = socket;
         this.timeout = null;
@@ -5967,11 +5967,11 @@ var require_client_h1 = __commonJS({
             currentBufferRef = null;
           }
           const offset = llhttp.llhttp_get_error_pos(this.ptr) - currentBufferPtr;
-          if (ret !== constants3.ERROR.OK) {
+          if (ret !== constants4.ERROR.OK) {
             const body = data.subarray(offset);
-            if (ret === constants3.ERROR.PAUSED_UPGRADE) {
+            if (ret === constants4.ERROR.PAUSED_UPGRADE) {
               this.onUpgrade(body);
-            } else if (ret === constants3.ERROR.PAUSED) {
+            } else if (ret === constants4.ERROR.PAUSED) {
               this.paused = true;
               socket.unshift(body);
             } else {
@@ -5994,10 +5994,10 @@ var require_client_h1 = __commonJS({
         } finally {
           currentParser = null;
         }
-        if (ret === constants3.ERROR.OK) {
+        if (ret === constants4.ERROR.OK) {
           return null;
         }
-        if (ret === constants3.ERROR.PAUSED || ret === constants3.ERROR.PAUSED_UPGRADE) {
+        if (ret === constants4.ERROR.PAUSED || ret === constants4.ERROR.PAUSED_UPGRADE) {
           this.paused = true;
           return null;
         }
@@ -6014,7 +6014,7 @@ var require_client_h1 = __commonJS({
           const len = new Uint8Array(llhttp.memory.buffer, ptr).indexOf(0);
           message = "Response does not match the HTTP/1.1 protocol (" + Buffer.from(llhttp.memory.buffer, ptr, len).toString() + ")";
         }
-        return new HTTPParserError(message, constants3.ERROR[ret], data);
+        return new HTTPParserError(message, constants4.ERROR[ret], data);
       }
       destroy() {
         assert(this.ptr != null);
@@ -6194,7 +6194,7 @@ var require_client_h1 = __commonJS({
           socket[kBlocking] = false;
           client[kResume]();
         }
-        return pause ? constants3.ERROR.PAUSED : 0;
+        return pause ? constants4.ERROR.PAUSED : 0;
       }
       onBody(buf) {
         const { client, socket, statusCode, maxResponseSize } = this;
@@ -6216,7 +6216,7 @@ var require_client_h1 = __commonJS({
         }
         this.bytesRead += buf.length;
         if (request2.onData(buf) === false) {
-          return constants3.ERROR.PAUSED;
+          return constants4.ERROR.PAUSED;
         }
       }
       onMessageComplete() {
@@ -6252,13 +6252,13 @@ var require_client_h1 = __commonJS({
         if (socket[kWriting]) {
           assert(client[kRunning] === 0);
           util.destroy(socket, new InformationalError("reset"));
-          return constants3.ERROR.PAUSED;
+          return constants4.ERROR.PAUSED;
         } else if (!shouldKeepAlive) {
           util.destroy(socket, new InformationalError("reset"));
-          return constants3.ERROR.PAUSED;
+          return constants4.ERROR.PAUSED;
         } else if (socket[kReset] && client[kRunning] === 0) {
           util.destroy(socket, new InformationalError("reset"));
-          return constants3.ERROR.PAUSED;
+          return constants4.ERROR.PAUSED;
         } else if (client[kPipelining] == null || client[kPipelining] === 1) {
           setImmediate(() => client[kResume]());
         } else {
@@ -6736,12 +6736,12 @@ upgrade: ${upgrade}\r
           cb();
         }
       }
-      const waitForDrain = () => new Promise((resolve5, reject) => {
+      const waitForDrain = () => new Promise((resolve6, reject) => {
         assert(callback === null);
         if (socket[kError]) {
           reject(socket[kError]);
         } else {
-          callback = resolve5;
+          callback = resolve6;
         }
       });
       socket.on("close", onDrain).on("drain", onDrain);
@@ -6879,7 +6879,7 @@ var require_client_h2 = __commonJS({
     "use strict";
     var assert = __require("node:assert");
     var { errorMonitor } = __require("node:events");
-    var { pipeline } = __require("node:stream");
+    var { pipeline: pipeline2 } = __require("node:stream");
     var util = require_util();
     var {
       RequestContentLengthMismatchError,
@@ -7358,7 +7358,7 @@ var require_client_h2 = __commonJS({
     }
     function writeStream(abort, socket, expectsPayload, h2stream, body, client, request2, contentLength) {
       assert(contentLength !== 0 || client[kRunning] === 0, "stream body cannot be pipelined");
-      const pipe = pipeline(
+      const pipe = pipeline2(
         body,
         h2stream,
         (err2) => {
@@ -7411,12 +7411,12 @@ var require_client_h2 = __commonJS({
           cb();
         }
       }
-      const waitForDrain = () => new Promise((resolve5, reject) => {
+      const waitForDrain = () => new Promise((resolve6, reject) => {
         assert(callback === null);
         if (socket[kError]) {
           reject(socket[kError]);
         } else {
-          callback = resolve5;
+          callback = resolve6;
         }
       });
       h2stream.on("close", onDrain).on("drain", onDrain);
@@ -7895,16 +7895,16 @@ var require_client = __commonJS({
         return this[kNeedDrain] < 2;
       }
       async [kClose]() {
-        return new Promise((resolve5) => {
+        return new Promise((resolve6) => {
           if (this[kSize]) {
-            this[kClosedResolve] = resolve5;
+            this[kClosedResolve] = resolve6;
           } else {
-            resolve5(null);
+            resolve6(null);
           }
         });
       }
       async [kDestroy](err2) {
-        return new Promise((resolve5) => {
+        return new Promise((resolve6) => {
           const requests = this[kQueue].splice(this[kPendingIdx]);
           for (let i2 = 0; i2 < requests.length; i2++) {
             const request2 = requests[i2];
@@ -7915,7 +7915,7 @@ var require_client = __commonJS({
               this[kClosedResolve]();
               this[kClosedResolve] = null;
             }
-            resolve5(null);
+            resolve6(null);
           };
           if (this[kHTTPContext]) {
             this[kHTTPContext].destroy(err2, callback);
@@ -7966,7 +7966,7 @@ var require_client = __commonJS({
         });
       }
       try {
-        const socket = await new Promise((resolve5, reject) => {
+        const socket = await new Promise((resolve6, reject) => {
           client[kConnector]({
             host,
             hostname,
@@ -7978,7 +7978,7 @@ var require_client = __commonJS({
             if (err2) {
               reject(err2);
             } else {
-              resolve5(socket2);
+              resolve6(socket2);
             }
           });
         });
@@ -8314,8 +8314,8 @@ var require_pool_base = __commonJS({
         if (this[kQueue].isEmpty()) {
           await Promise.all(this[kClients].map((c) => c.close()));
         } else {
-          await new Promise((resolve5) => {
-            this[kClosedResolve] = resolve5;
+          await new Promise((resolve6) => {
+            this[kClosedResolve] = resolve6;
           });
         }
       }
@@ -9457,7 +9457,7 @@ var require_readable = __commonJS({
   "node_modules/undici/lib/api/readable.js"(exports, module) {
     "use strict";
     var assert = __require("node:assert");
-    var { Readable } = __require("node:stream");
+    var { Readable: Readable2 } = __require("node:stream");
     var { RequestAbortedError, NotSupportedError, InvalidArgumentError, AbortError } = require_errors();
     var util = require_util();
     var { ReadableStreamFrom } = require_util();
@@ -9469,7 +9469,7 @@ var require_readable = __commonJS({
     var kContentLength = /* @__PURE__ */ Symbol("kContentLength");
     var noop4 = () => {
     };
-    var BodyReadable = class extends Readable {
+    var BodyReadable = class extends Readable2 {
       constructor({
         resume,
         abort,
@@ -9584,7 +9584,7 @@ var require_readable = __commonJS({
         if (this._readableState.closeEmitted) {
           return null;
         }
-        return await new Promise((resolve5, reject) => {
+        return await new Promise((resolve6, reject) => {
           if (this[kContentLength] > limit) {
             this.destroy(new AbortError());
           }
@@ -9597,7 +9597,7 @@ var require_readable = __commonJS({
             if (signal?.aborted) {
               reject(signal.reason ?? new AbortError());
             } else {
-              resolve5(null);
+              resolve6(null);
             }
           }).on("error", noop4).on("data", function(chunk) {
             limit -= chunk.length;
@@ -9616,7 +9616,7 @@ var require_readable = __commonJS({
     }
     async function consume(stream, type) {
       assert(!stream[kConsume]);
-      return new Promise((resolve5, reject) => {
+      return new Promise((resolve6, reject) => {
         if (isUnusable(stream)) {
           const rState = stream._readableState;
           if (rState.destroyed && rState.closeEmitted === false) {
@@ -9633,7 +9633,7 @@ var require_readable = __commonJS({
             stream[kConsume] = {
               type,
               stream,
-              resolve: resolve5,
+              resolve: resolve6,
               reject,
               length: 0,
               body: []
@@ -9703,18 +9703,18 @@ var require_readable = __commonJS({
       return buffer;
     }
     function consumeEnd(consume2) {
-      const { type, body, resolve: resolve5, stream, length } = consume2;
+      const { type, body, resolve: resolve6, stream, length } = consume2;
       try {
         if (type === "text") {
-          resolve5(chunksDecode(body, length));
+          resolve6(chunksDecode(body, length));
         } else if (type === "json") {
-          resolve5(JSON.parse(chunksDecode(body, length)));
+          resolve6(JSON.parse(chunksDecode(body, length)));
         } else if (type === "arrayBuffer") {
-          resolve5(chunksConcat(body, length).buffer);
+          resolve6(chunksConcat(body, length).buffer);
         } else if (type === "blob") {
-          resolve5(new Blob(body, { type: stream[kContentType] }));
+          resolve6(new Blob(body, { type: stream[kContentType] }));
         } else if (type === "bytes") {
-          resolve5(chunksConcat(body, length));
+          resolve6(chunksConcat(body, length));
         }
         consumeFinish(consume2);
       } catch (err2) {
@@ -9811,7 +9811,7 @@ var require_api_request = __commonJS({
   "node_modules/undici/lib/api/api-request.js"(exports, module) {
     "use strict";
     var assert = __require("node:assert");
-    var { Readable } = require_readable();
+    var { Readable: Readable2 } = require_readable();
     var { InvalidArgumentError, RequestAbortedError } = require_errors();
     var util = require_util();
     var { getResolveErrorBodyCallback } = require_util3();
@@ -9906,7 +9906,7 @@ var require_api_request = __commonJS({
         const parsedHeaders = responseHeaders === "raw" ? util.parseHeaders(rawHeaders) : headers;
         const contentType = parsedHeaders["content-type"];
         const contentLength = parsedHeaders["content-length"];
-        const res = new Readable({
+        const res = new Readable2({
           resume,
           abort,
           contentType,
@@ -9971,9 +9971,9 @@ var require_api_request = __commonJS({
     };
     function request2(opts, callback) {
       if (callback === void 0) {
-        return new Promise((resolve5, reject) => {
+        return new Promise((resolve6, reject) => {
           request2.call(this, opts, (err2, data) => {
-            return err2 ? reject(err2) : resolve5(data);
+            return err2 ? reject(err2) : resolve6(data);
           });
         });
       }
@@ -10196,9 +10196,9 @@ var require_api_stream = __commonJS({
     };
     function stream(opts, factory, callback) {
       if (callback === void 0) {
-        return new Promise((resolve5, reject) => {
+        return new Promise((resolve6, reject) => {
           stream.call(this, opts, factory, (err2, data) => {
-            return err2 ? reject(err2) : resolve5(data);
+            return err2 ? reject(err2) : resolve6(data);
           });
         });
       }
@@ -10221,7 +10221,7 @@ var require_api_pipeline = __commonJS({
   "node_modules/undici/lib/api/api-pipeline.js"(exports, module) {
     "use strict";
     var {
-      Readable,
+      Readable: Readable2,
       Duplex,
       PassThrough
     } = __require("node:stream");
@@ -10235,7 +10235,7 @@ var require_api_pipeline = __commonJS({
     var { addSignal, removeSignal } = require_abort_signal();
     var assert = __require("node:assert");
     var kResume = /* @__PURE__ */ Symbol("resume");
-    var PipelineRequest = class extends Readable {
+    var PipelineRequest = class extends Readable2 {
       constructor() {
         super({ autoDestroy: true });
         this[kResume] = null;
@@ -10252,7 +10252,7 @@ var require_api_pipeline = __commonJS({
         callback(err2);
       }
     };
-    var PipelineResponse = class extends Readable {
+    var PipelineResponse = class extends Readable2 {
       constructor(resume) {
         super({ autoDestroy: true });
         this[kResume] = resume;
@@ -10403,7 +10403,7 @@ var require_api_pipeline = __commonJS({
         util.destroy(ret, err2);
       }
     };
-    function pipeline(opts, handler2) {
+    function pipeline2(opts, handler2) {
       try {
         const pipelineHandler = new PipelineHandler(opts, handler2);
         this.dispatch({ ...opts, body: pipelineHandler.req }, pipelineHandler);
@@ -10412,7 +10412,7 @@ var require_api_pipeline = __commonJS({
         return new PassThrough().destroy(err2);
       }
     }
-    module.exports = pipeline;
+    module.exports = pipeline2;
   }
 });
 
@@ -10483,9 +10483,9 @@ var require_api_upgrade = __commonJS({
     };
     function upgrade(opts, callback) {
       if (callback === void 0) {
-        return new Promise((resolve5, reject) => {
+        return new Promise((resolve6, reject) => {
           upgrade.call(this, opts, (err2, data) => {
-            return err2 ? reject(err2) : resolve5(data);
+            return err2 ? reject(err2) : resolve6(data);
           });
         });
       }
@@ -10577,9 +10577,9 @@ var require_api_connect = __commonJS({
     };
     function connect(opts, callback) {
       if (callback === void 0) {
-        return new Promise((resolve5, reject) => {
+        return new Promise((resolve6, reject) => {
           connect.call(this, opts, (err2, data) => {
-            return err2 ? reject(err2) : resolve5(data);
+            return err2 ? reject(err2) : resolve6(data);
           });
         });
       }
@@ -13577,7 +13577,7 @@ var require_fetch = __commonJS({
       subresourceSet
     } = require_constants3();
     var EE = __require("node:events");
-    var { Readable, pipeline, finished } = __require("node:stream");
+    var { Readable: Readable2, pipeline: pipeline2, finished } = __require("node:stream");
     var { addAbortListener, isErrored, isReadable, bufferToLowerCasedHeaderName } = require_util();
     var { dataURLProcessor, serializeAMimeType, minimizeSupportedMimeType } = require_data_url();
     var { getGlobalDispatcher } = require_global2();
@@ -14442,7 +14442,7 @@ var require_fetch = __commonJS({
       function dispatch({ body }) {
         const url = requestCurrentURL(request2);
         const agent = fetchParams.controller.dispatcher;
-        return new Promise((resolve5, reject) => agent.dispatch(
+        return new Promise((resolve6, reject) => agent.dispatch(
           {
             path: url.pathname + url.search,
             origin: url.origin,
@@ -14516,13 +14516,13 @@ var require_fetch = __commonJS({
                   }
                 }
               }
-              this.body = new Readable({ read: resume });
+              this.body = new Readable2({ read: resume });
               const onError = this.onError.bind(this);
-              resolve5({
+              resolve6({
                 status,
                 statusText,
                 headersList,
-                body: decoders.length ? pipeline(this.body, ...decoders, (err2) => {
+                body: decoders.length ? pipeline2(this.body, ...decoders, (err2) => {
                   if (err2) {
                     this.onError(err2);
                   }
@@ -14561,7 +14561,7 @@ var require_fetch = __commonJS({
               for (let i2 = 0; i2 < rawHeaders.length; i2 += 2) {
                 headersList.append(bufferToLowerCasedHeaderName(rawHeaders[i2]), rawHeaders[i2 + 1].toString("latin1"), true);
               }
-              resolve5({
+              resolve6({
                 status,
                 statusText: STATUS_CODES[status],
                 headersList,
@@ -18302,8 +18302,8 @@ var require_util8 = __commonJS({
       return true;
     }
     function delay(ms) {
-      return new Promise((resolve5) => {
-        setTimeout(resolve5, ms).unref();
+      return new Promise((resolve6) => {
+        setTimeout(resolve6, ms).unref();
       });
     }
     module.exports = {
@@ -18723,7 +18723,7 @@ ${value}`;
 var require_eventsource = __commonJS({
   "node_modules/undici/lib/web/eventsource/eventsource.js"(exports, module) {
     "use strict";
-    var { pipeline } = __require("node:stream");
+    var { pipeline: pipeline2 } = __require("node:stream");
     var { fetching } = require_fetch();
     var { makeRequest } = require_request2();
     var { webidl } = require_webidl();
@@ -18883,7 +18883,7 @@ var require_eventsource = __commonJS({
               ));
             }
           });
-          pipeline(
+          pipeline2(
             response.body.stream,
             eventSourceStream,
             (error2) => {
@@ -19538,11 +19538,11 @@ var require_codegen = __commonJS({
         const rhs = this.rhs === void 0 ? "" : ` = ${this.rhs}`;
         return `${varKind} ${this.name}${rhs};` + _n;
       }
-      optimizeNames(names, constants3) {
+      optimizeNames(names, constants4) {
         if (!names[this.name.str])
           return;
         if (this.rhs)
-          this.rhs = optimizeExpr(this.rhs, names, constants3);
+          this.rhs = optimizeExpr(this.rhs, names, constants4);
         return this;
       }
       get names() {
@@ -19559,10 +19559,10 @@ var require_codegen = __commonJS({
       render({ _n }) {
         return `${this.lhs} = ${this.rhs};` + _n;
       }
-      optimizeNames(names, constants3) {
+      optimizeNames(names, constants4) {
         if (this.lhs instanceof code_1.Name && !names[this.lhs.str] && !this.sideEffects)
           return;
-        this.rhs = optimizeExpr(this.rhs, names, constants3);
+        this.rhs = optimizeExpr(this.rhs, names, constants4);
         return this;
       }
       get names() {
@@ -19623,8 +19623,8 @@ var require_codegen = __commonJS({
       optimizeNodes() {
         return `${this.code}` ? this : void 0;
       }
-      optimizeNames(names, constants3) {
-        this.code = optimizeExpr(this.code, names, constants3);
+      optimizeNames(names, constants4) {
+        this.code = optimizeExpr(this.code, names, constants4);
         return this;
       }
       get names() {
@@ -19653,12 +19653,12 @@ var require_codegen = __commonJS({
         }
         return nodes.length > 0 ? this : void 0;
       }
-      optimizeNames(names, constants3) {
+      optimizeNames(names, constants4) {
         const { nodes } = this;
         let i2 = nodes.length;
         while (i2--) {
           const n = nodes[i2];
-          if (n.optimizeNames(names, constants3))
+          if (n.optimizeNames(names, constants4))
             continue;
           subtractNames(names, n.names);
           nodes.splice(i2, 1);
@@ -19711,12 +19711,12 @@ var require_codegen = __commonJS({
           return void 0;
         return this;
       }
-      optimizeNames(names, constants3) {
+      optimizeNames(names, constants4) {
         var _a2;
-        this.else = (_a2 = this.else) === null || _a2 === void 0 ? void 0 : _a2.optimizeNames(names, constants3);
-        if (!(super.optimizeNames(names, constants3) || this.else))
+        this.else = (_a2 = this.else) === null || _a2 === void 0 ? void 0 : _a2.optimizeNames(names, constants4);
+        if (!(super.optimizeNames(names, constants4) || this.else))
           return;
-        this.condition = optimizeExpr(this.condition, names, constants3);
+        this.condition = optimizeExpr(this.condition, names, constants4);
         return this;
       }
       get names() {
@@ -19739,10 +19739,10 @@ var require_codegen = __commonJS({
       render(opts) {
         return `for(${this.iteration})` + super.render(opts);
       }
-      optimizeNames(names, constants3) {
-        if (!super.optimizeNames(names, constants3))
+      optimizeNames(names, constants4) {
+        if (!super.optimizeNames(names, constants4))
           return;
-        this.iteration = optimizeExpr(this.iteration, names, constants3);
+        this.iteration = optimizeExpr(this.iteration, names, constants4);
         return this;
       }
       get names() {
@@ -19778,10 +19778,10 @@ var require_codegen = __commonJS({
       render(opts) {
         return `for(${this.varKind} ${this.name} ${this.loop} ${this.iterable})` + super.render(opts);
       }
-      optimizeNames(names, constants3) {
-        if (!super.optimizeNames(names, constants3))
+      optimizeNames(names, constants4) {
+        if (!super.optimizeNames(names, constants4))
           return;
-        this.iterable = optimizeExpr(this.iterable, names, constants3);
+        this.iterable = optimizeExpr(this.iterable, names, constants4);
         return this;
       }
       get names() {
@@ -19823,11 +19823,11 @@ var require_codegen = __commonJS({
         (_b2 = this.finally) === null || _b2 === void 0 ? void 0 : _b2.optimizeNodes();
         return this;
       }
-      optimizeNames(names, constants3) {
+      optimizeNames(names, constants4) {
         var _a2, _b2;
-        super.optimizeNames(names, constants3);
-        (_a2 = this.catch) === null || _a2 === void 0 ? void 0 : _a2.optimizeNames(names, constants3);
-        (_b2 = this.finally) === null || _b2 === void 0 ? void 0 : _b2.optimizeNames(names, constants3);
+        super.optimizeNames(names, constants4);
+        (_a2 = this.catch) === null || _a2 === void 0 ? void 0 : _a2.optimizeNames(names, constants4);
+        (_b2 = this.finally) === null || _b2 === void 0 ? void 0 : _b2.optimizeNames(names, constants4);
         return this;
       }
       get names() {
@@ -20128,7 +20128,7 @@ var require_codegen = __commonJS({
     function addExprNames(names, from) {
       return from instanceof code_1._CodeOrName ? addNames(names, from.names) : names;
     }
-    function optimizeExpr(expr, names, constants3) {
+    function optimizeExpr(expr, names, constants4) {
       if (expr instanceof code_1.Name)
         return replaceName(expr);
       if (!canOptimize(expr))
@@ -20143,14 +20143,14 @@ var require_codegen = __commonJS({
         return items;
       }, []));
       function replaceName(n) {
-        const c = constants3[n.str];
+        const c = constants4[n.str];
         if (c === void 0 || names[n.str] !== 1)
           return n;
         delete names[n.str];
         return c;
       }
       function canOptimize(e) {
-        return e instanceof code_1._Code && e._items.some((c) => c instanceof code_1.Name && names[c.str] === 1 && constants3[c.str] !== void 0);
+        return e instanceof code_1._Code && e._items.some((c) => c instanceof code_1.Name && names[c.str] === 1 && constants4[c.str] !== void 0);
       }
     }
     function subtractNames(names, from) {
@@ -22112,7 +22112,7 @@ var require_compile = __commonJS({
       const schOrFunc = root.refs[ref];
       if (schOrFunc)
         return schOrFunc;
-      let _sch = resolve5.call(this, root, ref);
+      let _sch = resolve6.call(this, root, ref);
       if (_sch === void 0) {
         const schema = (_a2 = root.localRefs) === null || _a2 === void 0 ? void 0 : _a2[ref];
         const { schemaId } = this.opts;
@@ -22139,7 +22139,7 @@ var require_compile = __commonJS({
     function sameSchemaEnv(s1, s2) {
       return s1.schema === s2.schema && s1.root === s2.root && s1.baseId === s2.baseId;
     }
-    function resolve5(root, ref) {
+    function resolve6(root, ref) {
       let sch;
       while (typeof (sch = this.refs[ref]) == "string")
         ref = sch;
@@ -22999,11 +22999,11 @@ var require_fast_uri = __commonJS({
         normalizeString(uri, options);
       } else if (typeof uri === "object") {
         uri = /** @type {T} */
-        parse4(serialize2(uri, options), options);
+        parse3(serialize2(uri, options), options);
       }
       return uri;
     }
-    function resolve5(baseURI, relativeURI, options) {
+    function resolve6(baseURI, relativeURI, options) {
       const schemelessOptions = options ? Object.assign({ scheme: "null" }, options) : { scheme: "null" };
       const {
         parsed: baseParsed,
@@ -23039,50 +23039,50 @@ var require_fast_uri = __commonJS({
       schemelessOptions.skipEscape = true;
       return serialize2(resolved, schemelessOptions);
     }
-    function resolveComponent(base, relative3, options, skipNormalization) {
+    function resolveComponent(base, relative4, options, skipNormalization) {
       const target = {};
       if (!skipNormalization) {
-        base = parse4(serialize2(base, options), options);
-        relative3 = parse4(serialize2(relative3, options), options);
+        base = parse3(serialize2(base, options), options);
+        relative4 = parse3(serialize2(relative4, options), options);
       }
       options = options || {};
-      if (!options.tolerant && relative3.scheme) {
-        target.scheme = relative3.scheme;
-        target.userinfo = relative3.userinfo;
-        target.host = relative3.host;
-        target.port = relative3.port;
-        target.path = removeDotSegments(relative3.path || "");
-        target.query = relative3.query;
+      if (!options.tolerant && relative4.scheme) {
+        target.scheme = relative4.scheme;
+        target.userinfo = relative4.userinfo;
+        target.host = relative4.host;
+        target.port = relative4.port;
+        target.path = removeDotSegments(relative4.path || "");
+        target.query = relative4.query;
       } else {
-        if (relative3.userinfo !== void 0 || relative3.host !== void 0 || relative3.port !== void 0) {
-          target.userinfo = relative3.userinfo;
-          target.host = relative3.host;
-          target.port = relative3.port;
-          target.path = removeDotSegments(relative3.path || "");
-          target.query = relative3.query;
+        if (relative4.userinfo !== void 0 || relative4.host !== void 0 || relative4.port !== void 0) {
+          target.userinfo = relative4.userinfo;
+          target.host = relative4.host;
+          target.port = relative4.port;
+          target.path = removeDotSegments(relative4.path || "");
+          target.query = relative4.query;
         } else {
-          if (!relative3.path) {
+          if (!relative4.path) {
             target.path = base.path;
-            if (relative3.query !== void 0) {
-              target.query = relative3.query;
+            if (relative4.query !== void 0) {
+              target.query = relative4.query;
             } else {
               target.query = base.query;
             }
           } else {
-            if (relative3.path[0] === "/") {
-              target.path = removeDotSegments(relative3.path);
+            if (relative4.path[0] === "/") {
+              target.path = removeDotSegments(relative4.path);
             } else {
               const baseHasAuthority = base.userinfo !== void 0 || base.host !== void 0 || base.port !== void 0;
               if (baseHasAuthority && !base.path) {
-                target.path = "/" + relative3.path;
+                target.path = "/" + relative4.path;
               } else if (!base.path) {
-                target.path = relative3.path;
+                target.path = relative4.path;
               } else {
-                target.path = base.path.slice(0, base.path.lastIndexOf("/") + 1) + relative3.path;
+                target.path = base.path.slice(0, base.path.lastIndexOf("/") + 1) + relative4.path;
               }
               target.path = base.scheme === void 0 && !baseHasAuthority && target.path[0] !== "/" ? removeDotSegmentsRelative(target.path) : removeDotSegments(target.path);
             }
-            target.query = relative3.query;
+            target.query = relative4.query;
           }
           target.userinfo = base.userinfo;
           target.host = base.host;
@@ -23090,7 +23090,7 @@ var require_fast_uri = __commonJS({
         }
         target.scheme = base.scheme;
       }
-      target.fragment = relative3.fragment;
+      target.fragment = relative4.fragment;
       return target;
     }
     function equal(uriA, uriB, options) {
@@ -23361,7 +23361,7 @@ var require_fast_uri = __commonJS({
       }
       return { parsed, malformedAuthorityOrPort, malformedPercentEncoding, malformedSchemeSpecific, malformedHost, malformedScheme };
     }
-    function parse4(uri, opts) {
+    function parse3(uri, opts) {
       return parseWithStatus(uri, opts).parsed;
     }
     function normalizeString(uri, opts) {
@@ -23394,11 +23394,11 @@ var require_fast_uri = __commonJS({
     var fastUri = {
       SCHEMES,
       normalize,
-      resolve: resolve5,
+      resolve: resolve6,
       resolveComponent,
       equal,
       serialize: serialize2,
-      parse: parse4
+      parse: parse3
     };
     module.exports = fastUri;
     module.exports.default = fastUri;
@@ -26668,28 +26668,28 @@ var require_jstat = __commonJS({
           var distinctNumbers = [];
           var numberCounts = {};
           for (i2 = 0; i2 < arr.length; i2++) {
-            var number2 = arr[i2];
-            if (numberCounts[number2]) {
-              numberCounts[number2]++;
+            var number = arr[i2];
+            if (numberCounts[number]) {
+              numberCounts[number]++;
             } else {
-              numberCounts[number2] = 1;
-              distinctNumbers.push(number2);
+              numberCounts[number] = 1;
+              distinctNumbers.push(number);
             }
           }
           var sortedDistinctNumbers = distinctNumbers.sort(ascNum);
           var numberRanks = {};
           var currentRank = 1;
           for (i2 = 0; i2 < sortedDistinctNumbers.length; i2++) {
-            var number2 = sortedDistinctNumbers[i2];
-            var count2 = numberCounts[number2];
+            var number = sortedDistinctNumbers[i2];
+            var count2 = numberCounts[number];
             var first = currentRank;
             var last = currentRank + count2 - 1;
             var rank = (first + last) / 2;
-            numberRanks[number2] = rank;
+            numberRanks[number] = rank;
             currentRank += count2;
           }
-          return arr.map(function(number3) {
-            return numberRanks[number3];
+          return arr.map(function(number2) {
+            return numberRanks[number2];
           });
         };
         jStat3.mode = function mode(arr) {
@@ -30656,8 +30656,8 @@ var require_json_schema_2020_12 = __commonJS({
         with$data(this, validation)
       ].forEach((sch) => this.addMetaSchema(sch, void 0, false));
       return this;
-      function with$data(ajv2, sch) {
-        return $data ? ajv2.$dataMetaSchema(sch, META_SUPPORT_DATA) : sch;
+      function with$data(ajv, sch) {
+        return $data ? ajv.$dataMetaSchema(sch, META_SUPPORT_DATA) : sch;
       }
     }
     exports.default = addMetaSchema2020;
@@ -31008,9 +31008,9 @@ var require_limit = __commonJS({
       },
       dependencies: ["format"]
     };
-    var formatLimitPlugin = (ajv2) => {
-      ajv2.addKeyword(exports.formatLimitDefinition);
-      return ajv2;
+    var formatLimitPlugin = (ajv) => {
+      ajv.addKeyword(exports.formatLimitDefinition);
+      return ajv;
     };
     exports.default = formatLimitPlugin;
   }
@@ -31026,17 +31026,17 @@ var require_dist = __commonJS({
     var codegen_1 = require_codegen();
     var fullName2 = new codegen_1.Name("fullFormats");
     var fastName = new codegen_1.Name("fastFormats");
-    var formatsPlugin = (ajv2, opts = { keywords: true }) => {
+    var formatsPlugin = (ajv, opts = { keywords: true }) => {
       if (Array.isArray(opts)) {
-        addFormats2(ajv2, opts, formats_1.fullFormats, fullName2);
-        return ajv2;
+        addFormats2(ajv, opts, formats_1.fullFormats, fullName2);
+        return ajv;
       }
       const [formats, exportName] = opts.mode === "fast" ? [formats_1.fastFormats, fastName] : [formats_1.fullFormats, fullName2];
       const list = opts.formats || formats_1.formatNames;
-      addFormats2(ajv2, list, formats, exportName);
+      addFormats2(ajv, list, formats, exportName);
       if (opts.keywords)
-        (0, limit_1.default)(ajv2);
-      return ajv2;
+        (0, limit_1.default)(ajv);
+      return ajv;
     };
     formatsPlugin.get = (name, mode = "full") => {
       const formats = mode === "fast" ? formats_1.fastFormats : formats_1.fullFormats;
@@ -31045,12 +31045,12 @@ var require_dist = __commonJS({
         throw new Error(`Unknown format "${name}"`);
       return f;
     };
-    function addFormats2(ajv2, list, fs3, exportName) {
+    function addFormats2(ajv, list, fs3, exportName) {
       var _a2;
       var _b2;
-      (_a2 = (_b2 = ajv2.opts.code).formats) !== null && _a2 !== void 0 ? _a2 : _b2.formats = (0, codegen_1._)`require("ajv-formats/dist/formats").${exportName}`;
+      (_a2 = (_b2 = ajv.opts.code).formats) !== null && _a2 !== void 0 ? _a2 : _b2.formats = (0, codegen_1._)`require("ajv-formats/dist/formats").${exportName}`;
       for (const f of list)
-        ajv2.addFormat(f, fs3[f]);
+        ajv.addFormat(f, fs3[f]);
     }
     module.exports = exports = formatsPlugin;
     Object.defineProperty(exports, "__esModule", { value: true });
@@ -38288,7 +38288,7 @@ var require_public_api = __commonJS({
       }
       return doc;
     }
-    function parse4(src, reviver, options) {
+    function parse3(src, reviver, options) {
       let _reviver = void 0;
       if (typeof reviver === "function") {
         _reviver = reviver;
@@ -38329,7 +38329,7 @@ var require_public_api = __commonJS({
         return value.toString(options);
       return new Document.Document(value, _replacer, options).toString(options);
     }
-    exports.parse = parse4;
+    exports.parse = parse3;
     exports.parseAllDocuments = parseAllDocuments;
     exports.parseDocument = parseDocument2;
     exports.stringify = stringify;
@@ -38750,7 +38750,7 @@ function expand(template, context3) {
     return template.replace(/\/$/, "");
   }
 }
-function parse2(options) {
+function parse(options) {
   let method = options.method.toUpperCase();
   let url = (options.url || "/").replace(/:([a-z]\w+)/g, "{$1}");
   let headers = Object.assign({}, options.headers);
@@ -38814,7 +38814,7 @@ function parse2(options) {
   );
 }
 function endpointWithDefaults(defaults2, route, options) {
-  return parse2(merge(defaults2, route, options));
+  return parse(merge(defaults2, route, options));
 }
 function withDefaults(oldDefaults, newDefaults) {
   const DEFAULTS2 = merge(oldDefaults, newDefaults);
@@ -38823,7 +38823,7 @@ function withDefaults(oldDefaults, newDefaults) {
     DEFAULTS: DEFAULTS2,
     defaults: withDefaults.bind(null, DEFAULTS2),
     merge: merge.bind(null, DEFAULTS2),
-    parse: parse2
+    parse
   });
 }
 var VERSION, userAgent, DEFAULTS, urlVariableRegex, endpoint;
@@ -38849,7 +38849,7 @@ var init_dist_bundle = __esm({
 });
 
 // node_modules/content-type/dist/index.js
-function parse3(header, options) {
+function parse2(header, options) {
   const stopFlags = SEMI_FLAG | (options?.comma === true ? COMMA_FLAG : 0);
   const len = header.length;
   let valueStart = options?.start ?? 0;
@@ -39533,7 +39533,7 @@ async function getResponseData(response) {
   if (!contentType) {
     return response.text().catch(noop);
   }
-  const mimetype = parse3(contentType);
+  const mimetype = parse2(contentType);
   if (isJSONResponse(mimetype)) {
     let text2 = "";
     try {
@@ -42964,8 +42964,8 @@ var require_light = __commonJS({
           return this.Promise.resolve();
         }
         yieldLoop(t = 0) {
-          return new this.Promise(function(resolve5, reject) {
-            return setTimeout(resolve5, t);
+          return new this.Promise(function(resolve6, reject) {
+            return setTimeout(resolve6, t);
           });
         }
         computePenalty() {
@@ -43176,15 +43176,15 @@ var require_light = __commonJS({
           return this._queue.length === 0;
         }
         async _tryToRun() {
-          var args, cb, error2, reject, resolve5, returned, task;
+          var args, cb, error2, reject, resolve6, returned, task;
           if (this._running < 1 && this._queue.length > 0) {
             this._running++;
-            ({ task, args, resolve: resolve5, reject } = this._queue.shift());
+            ({ task, args, resolve: resolve6, reject } = this._queue.shift());
             cb = await (async function() {
               try {
                 returned = await task(...args);
                 return function() {
-                  return resolve5(returned);
+                  return resolve6(returned);
                 };
               } catch (error1) {
                 error2 = error1;
@@ -43199,13 +43199,13 @@ var require_light = __commonJS({
           }
         }
         schedule(task, ...args) {
-          var promise, reject, resolve5;
-          resolve5 = reject = null;
+          var promise, reject, resolve6;
+          resolve6 = reject = null;
           promise = new this.Promise(function(_resolve, _reject) {
-            resolve5 = _resolve;
+            resolve6 = _resolve;
             return reject = _reject;
           });
-          this._queue.push({ task, args, resolve: resolve5, reject });
+          this._queue.push({ task, args, resolve: resolve6, reject });
           this._tryToRun();
           return promise;
         }
@@ -43606,14 +43606,14 @@ var require_light = __commonJS({
                 counts = this._states.counts;
                 return counts[0] + counts[1] + counts[2] + counts[3] === at;
               };
-              return new this.Promise((resolve5, reject) => {
+              return new this.Promise((resolve6, reject) => {
                 if (finished()) {
-                  return resolve5();
+                  return resolve6();
                 } else {
                   return this.on("done", () => {
                     if (finished()) {
                       this.removeAllListeners("done");
-                      return resolve5();
+                      return resolve6();
                     }
                   });
                 }
@@ -43706,9 +43706,9 @@ var require_light = __commonJS({
               options = parser$5.load(options, this.jobDefaults);
             }
             task = (...args2) => {
-              return new this.Promise(function(resolve5, reject) {
+              return new this.Promise(function(resolve6, reject) {
                 return fn(...args2, function(...args3) {
-                  return (args3[0] != null ? reject : resolve5)(args3);
+                  return (args3[0] != null ? reject : resolve6)(args3);
                 });
               });
             };
@@ -44010,11 +44010,11 @@ var require_lib = __commonJS({
     })();
     var __awaiter3 = exports && exports.__awaiter || function(thisArg, _arguments, P, generator) {
       function adopt(value) {
-        return value instanceof P ? value : new P(function(resolve5) {
-          resolve5(value);
+        return value instanceof P ? value : new P(function(resolve6) {
+          resolve6(value);
         });
       }
-      return new (P || (P = Promise))(function(resolve5, reject) {
+      return new (P || (P = Promise))(function(resolve6, reject) {
         function fulfilled(value) {
           try {
             step(generator.next(value));
@@ -44030,7 +44030,7 @@ var require_lib = __commonJS({
           }
         }
         function step(result) {
-          result.done ? resolve5(result.value) : adopt(result.value).then(fulfilled, rejected);
+          result.done ? resolve6(result.value) : adopt(result.value).then(fulfilled, rejected);
         }
         step((generator = generator.apply(thisArg, _arguments || [])).next());
       });
@@ -44117,26 +44117,26 @@ var require_lib = __commonJS({
       }
       readBody() {
         return __awaiter3(this, void 0, void 0, function* () {
-          return new Promise((resolve5) => __awaiter3(this, void 0, void 0, function* () {
+          return new Promise((resolve6) => __awaiter3(this, void 0, void 0, function* () {
             let output = Buffer.alloc(0);
             this.message.on("data", (chunk) => {
               output = Buffer.concat([output, chunk]);
             });
             this.message.on("end", () => {
-              resolve5(output.toString());
+              resolve6(output.toString());
             });
           }));
         });
       }
       readBodyBuffer() {
         return __awaiter3(this, void 0, void 0, function* () {
-          return new Promise((resolve5) => __awaiter3(this, void 0, void 0, function* () {
+          return new Promise((resolve6) => __awaiter3(this, void 0, void 0, function* () {
             const chunks = [];
             this.message.on("data", (chunk) => {
               chunks.push(chunk);
             });
             this.message.on("end", () => {
-              resolve5(Buffer.concat(chunks));
+              resolve6(Buffer.concat(chunks));
             });
           }));
         });
@@ -44344,14 +44344,14 @@ var require_lib = __commonJS({
        */
       requestRaw(info2, data) {
         return __awaiter3(this, void 0, void 0, function* () {
-          return new Promise((resolve5, reject) => {
+          return new Promise((resolve6, reject) => {
             function callbackForResult(err2, res) {
               if (err2) {
                 reject(err2);
               } else if (!res) {
                 reject(new Error("Unknown error"));
               } else {
-                resolve5(res);
+                resolve6(res);
               }
             }
             this.requestRawWithCallback(info2, data, callbackForResult);
@@ -44595,12 +44595,12 @@ var require_lib = __commonJS({
         return __awaiter3(this, void 0, void 0, function* () {
           retryNumber = Math.min(ExponentialBackoffCeiling, retryNumber);
           const ms = ExponentialBackoffTimeSlice * Math.pow(2, retryNumber);
-          return new Promise((resolve5) => setTimeout(() => resolve5(), ms));
+          return new Promise((resolve6) => setTimeout(() => resolve6(), ms));
         });
       }
       _processResponse(res, options) {
         return __awaiter3(this, void 0, void 0, function* () {
-          return new Promise((resolve5, reject) => __awaiter3(this, void 0, void 0, function* () {
+          return new Promise((resolve6, reject) => __awaiter3(this, void 0, void 0, function* () {
             const statusCode = res.message.statusCode || 0;
             const response = {
               statusCode,
@@ -44608,7 +44608,7 @@ var require_lib = __commonJS({
               headers: {}
             };
             if (statusCode === HttpCodes2.NotFound) {
-              resolve5(response);
+              resolve6(response);
             }
             function dateTimeDeserializer(key, value) {
               if (typeof value === "string") {
@@ -44647,7 +44647,7 @@ var require_lib = __commonJS({
               err2.result = response.result;
               reject(err2);
             } else {
-              resolve5(response);
+              resolve6(response);
             }
           }));
         });
@@ -44705,11 +44705,11 @@ var init_utils = __esm({
     import_undici2 = __toESM(require_undici(), 1);
     __awaiter2 = function(thisArg, _arguments, P, generator) {
       function adopt(value) {
-        return value instanceof P ? value : new P(function(resolve5) {
-          resolve5(value);
+        return value instanceof P ? value : new P(function(resolve6) {
+          resolve6(value);
         });
       }
-      return new (P || (P = Promise))(function(resolve5, reject) {
+      return new (P || (P = Promise))(function(resolve6, reject) {
         function fulfilled(value) {
           try {
             step(generator.next(value));
@@ -44725,7 +44725,7 @@ var init_utils = __esm({
           }
         }
         function step(result) {
-          result.done ? resolve5(result.value) : adopt(result.value).then(fulfilled, rejected);
+          result.done ? resolve6(result.value) : adopt(result.value).then(fulfilled, rejected);
         }
         step((generator = generator.apply(thisArg, _arguments || [])).next());
       });
@@ -44957,11 +44957,11 @@ import { EOL as EOL3 } from "os";
 import { constants, promises } from "fs";
 var __awaiter = function(thisArg, _arguments, P, generator) {
   function adopt(value) {
-    return value instanceof P ? value : new P(function(resolve5) {
-      resolve5(value);
+    return value instanceof P ? value : new P(function(resolve6) {
+      resolve6(value);
     });
   }
-  return new (P || (P = Promise))(function(resolve5, reject) {
+  return new (P || (P = Promise))(function(resolve6, reject) {
     function fulfilled(value) {
       try {
         step(generator.next(value));
@@ -44977,7 +44977,7 @@ var __awaiter = function(thisArg, _arguments, P, generator) {
       }
     }
     function step(result) {
-      result.done ? resolve5(result.value) : adopt(result.value).then(fulfilled, rejected);
+      result.done ? resolve6(result.value) : adopt(result.value).then(fulfilled, rejected);
     }
     step((generator = generator.apply(thisArg, _arguments || [])).next());
   });
@@ -45318,12 +45318,12 @@ function quote(value) {
 }
 var InputError = class extends Error {
   issues;
-  constructor(issues2) {
-    const shown = issues2.slice(0, 10).map(formatIssue);
-    const more = issues2.length > 10 ? [`\u2026and ${issues2.length - 10} more problems.`] : [];
+  constructor(issues) {
+    const shown = issues.slice(0, 10).map(formatIssue);
+    const more = issues.length > 10 ? [`\u2026and ${issues.length - 10} more problems.`] : [];
     super([...shown, ...more].join("\n"));
     this.name = "InputError";
-    this.issues = issues2;
+    this.issues = issues;
   }
 };
 var UsageError = class extends Error {
@@ -45369,32 +45369,8 @@ function coreIO() {
   };
 }
 
-// src/analysis/gate.ts
-var RULES = {
-  "worse-validation": (r) => r.validation.change === "worse" ? "validation got significantly worse" : null,
-  "toward-overfitting": (r) => r.movement === "toward-overfitting" ? "the change moved toward overfitting" : null,
-  "toward-underfitting": (r) => r.movement === "toward-underfitting" ? "the change moved toward underfitting" : null,
-  "worse-on-both": (r) => r.movement === "worse-on-both" ? "bias and variance both got worse" : null,
-  "any-movement": (r) => r.movement !== "no-significant-change" ? `the model moved (${r.movement})` : null,
-  "slice-regression": (r) => {
-    const worse = r.slices.filter((s) => s.change === "worse");
-    return worse.length > 0 ? `${worse.length} slice(s) regressed significantly` : null;
-  },
-  "high-bias": (r) => r.candidate.diagnosis === "high-bias" || r.candidate.diagnosis === "high-bias-and-variance" ? "the candidate has high bias" : null,
-  "high-variance": (r) => r.candidate.diagnosis === "high-variance" || r.candidate.diagnosis === "high-bias-and-variance" ? "the candidate has high variance" : null,
-  "data-mismatch": (r) => r.candidate.diagnosis === "data-mismatch" ? "the candidate shows data mismatch" : null,
-  "validation-overfit": (r) => r.candidate.components.overfit.present ? "the candidate overfits the validation set (test error well above validation)" : null,
-  none: () => null
-};
-function applyGate(review) {
-  const failOn = review.settings.failOn;
-  const reasons = [];
-  for (const policy of failOn) {
-    const reason = RULES[policy]?.(review) ?? null;
-    if (reason !== null) reasons.push(`${policy}: ${reason}`);
-  }
-  return { pass: reasons.length === 0, reasons, failOn: [...failOn] };
-}
+// src/entries/action/publish-mode.ts
+import { join as join4 } from "node:path";
 
 // src/io/github/artifacts.ts
 import { posix } from "node:path";
@@ -45906,8 +45882,16 @@ function readEntry(zip, entry, budget, label) {
     `more while inflating ${JSON.stringify(entry.name)}`,
     'Raise "archive-limit-mb" if the archive is genuine.'
   );
+  const corrupt = (detail) => refuse(
+    label,
+    `must hold readable data in ${JSON.stringify(entry.name)}`,
+    detail,
+    "The archive is damaged; upload it again."
+  );
   if (entry.method === 0) {
     if (data.length > budget.remaining) over();
+    if (data.length !== entry.size || data.length !== entry.compressedSize)
+      corrupt(`${data.length} stored bytes where its directory says ${entry.size}`);
     budget.remaining -= data.length;
     return data.slice();
   }
@@ -45921,10 +45905,15 @@ function readEntry(zip, entry, budget, label) {
     chunks.push(chunk);
   });
   const step = 64 * 1024;
-  for (let i2 = 0; i2 < data.length; i2 += step) {
-    inflater.push(data.subarray(i2, i2 + step), i2 + step >= data.length);
+  try {
+    for (let i2 = 0; i2 < data.length; i2 += step) {
+      inflater.push(data.subarray(i2, i2 + step), i2 + step >= data.length);
+    }
+    if (data.length === 0) inflater.push(new Uint8Array(0), true);
+  } catch (error2) {
+    if (error2 instanceof InputError) throw error2;
+    corrupt(`invalid deflate data (${error2 instanceof Error ? error2.message : String(error2)})`);
   }
-  if (data.length === 0) inflater.push(new Uint8Array(0), true);
   if (total !== entry.size) {
     refuse(
       label,
@@ -46040,1037 +46029,514 @@ function predictionsEntry(runBytes, runName, entries) {
   return entries.find((e) => e.name === wanted);
 }
 
-// node_modules/markdown-table/index.js
-function defaultStringLength(value) {
-  return value.length;
-}
-function markdownTable(table2, options) {
-  const settings = options || {};
-  const align = (settings.align || []).concat();
-  const stringLength = settings.stringLength || defaultStringLength;
-  const alignments = [];
-  const cellMatrix = [];
-  const sizeMatrix = [];
-  const longestCellByColumn = [];
-  let mostCellsPerRow = 0;
-  let rowIndex = -1;
-  while (++rowIndex < table2.length) {
-    const row2 = [];
-    const sizes2 = [];
-    let columnIndex2 = -1;
-    if (table2[rowIndex].length > mostCellsPerRow) {
-      mostCellsPerRow = table2[rowIndex].length;
-    }
-    while (++columnIndex2 < table2[rowIndex].length) {
-      const cell = serialize(table2[rowIndex][columnIndex2]);
-      if (settings.alignDelimiters !== false) {
-        const size = stringLength(cell);
-        sizes2[columnIndex2] = size;
-        if (longestCellByColumn[columnIndex2] === void 0 || size > longestCellByColumn[columnIndex2]) {
-          longestCellByColumn[columnIndex2] = size;
-        }
-      }
-      row2.push(cell);
-    }
-    cellMatrix[rowIndex] = row2;
-    sizeMatrix[rowIndex] = sizes2;
-  }
-  let columnIndex = -1;
-  if (typeof align === "object" && "length" in align) {
-    while (++columnIndex < mostCellsPerRow) {
-      alignments[columnIndex] = toAlignment(align[columnIndex]);
-    }
-  } else {
-    const code = toAlignment(align);
-    while (++columnIndex < mostCellsPerRow) {
-      alignments[columnIndex] = code;
-    }
-  }
-  columnIndex = -1;
-  const row = [];
-  const sizes = [];
-  while (++columnIndex < mostCellsPerRow) {
-    const code = alignments[columnIndex];
-    let before = "";
-    let after = "";
-    if (code === 99) {
-      before = ":";
-      after = ":";
-    } else if (code === 108) {
-      before = ":";
-    } else if (code === 114) {
-      after = ":";
-    }
-    let size = settings.alignDelimiters === false ? 1 : Math.max(
-      1,
-      longestCellByColumn[columnIndex] - before.length - after.length
-    );
-    const cell = before + "-".repeat(size) + after;
-    if (settings.alignDelimiters !== false) {
-      size = before.length + size + after.length;
-      if (size > longestCellByColumn[columnIndex]) {
-        longestCellByColumn[columnIndex] = size;
-      }
-      sizes[columnIndex] = size;
-    }
-    row[columnIndex] = cell;
-  }
-  cellMatrix.splice(1, 0, row);
-  sizeMatrix.splice(1, 0, sizes);
-  rowIndex = -1;
-  const lines = [];
-  while (++rowIndex < cellMatrix.length) {
-    const row2 = cellMatrix[rowIndex];
-    const sizes2 = sizeMatrix[rowIndex];
-    const cellsInRow = settings.fillRows === false ? Math.max(1, cellMatrix[rowIndex === 1 ? 0 : rowIndex].length) : mostCellsPerRow;
-    columnIndex = -1;
-    const line = [];
-    while (++columnIndex < cellsInRow) {
-      const cell = row2[columnIndex] || "";
-      let before = "";
-      let after = "";
-      if (settings.alignDelimiters !== false) {
-        const size = longestCellByColumn[columnIndex] - (sizes2[columnIndex] || 0);
-        const code = alignments[columnIndex];
-        if (code === 114) {
-          before = " ".repeat(size);
-        } else if (code === 99) {
-          const half = size / 2;
-          if (size % 2) {
-            before = " ".repeat(half + 0.5);
-            after = " ".repeat(half - 0.5);
-          } else {
-            before = " ".repeat(half);
-            after = before;
-          }
-        } else {
-          after = " ".repeat(size);
-        }
-      }
-      if (settings.delimiterStart !== false && !columnIndex) {
-        line.push("|");
-      }
-      if (settings.padding !== false && // Don’t add the opening space if we’re not aligning and the cell is
-      // empty: there will be a closing space.
-      !(settings.alignDelimiters === false && cell === "") && (settings.delimiterStart !== false || columnIndex)) {
-        line.push(" ");
-      }
-      if (settings.alignDelimiters !== false) {
-        line.push(before);
-      }
-      line.push(cell);
-      if (settings.alignDelimiters !== false) {
-        line.push(after);
-      }
-      if (settings.padding !== false) {
-        line.push(" ");
-      }
-      if (settings.delimiterEnd !== false || columnIndex !== cellsInRow - 1) {
-        line.push("|");
-      }
-    }
-    lines.push(
-      settings.delimiterEnd === false ? line.join("").replace(/ +$/, "") : line.join("")
-    );
-  }
-  return lines.join("\n");
-}
-function serialize(value) {
-  return value === null || value === void 0 ? "" : String(value);
-}
-function toAlignment(value) {
-  const code = typeof value === "string" ? value.codePointAt(0) : 0;
-  return code === 67 || code === 99 ? 99 : code === 76 || code === 108 ? 108 : code === 82 || code === 114 ? 114 : 0;
+// src/io/bundle.ts
+var import_ajv = __toESM(require_ajv(), 1);
+import { mkdir as mkdir2, mkdtemp, writeFile as writeFile2 } from "node:fs/promises";
+import { createWriteStream } from "node:fs";
+import { pipeline } from "node:stream/promises";
+import { join } from "node:path";
+
+// src/model/limits.ts
+var MAX_MAGNITUDE = 1e15;
+var MAX_CURVE_POINTS = 1e4;
+var MAX_JSON_DEPTH = 64;
+function formatLimit(value) {
+  if (value !== 0 && (Math.abs(value) >= 1e6 || Math.abs(value) < 1e-6))
+    return value.toExponential().replace("e+", "e");
+  return String(value);
 }
 
-// src/report/escape.ts
-var DEFAULT_MAX_NAME = 80;
-var ZWJ = "\u200D";
-var REMOVED = /[\p{Cc}\p{Cf}\p{Cs}]/gu;
-var BREAKS = /[\t\n\v\f\r\u0085\u2028\u2029]/g;
-function plainText(text2, maxChars = DEFAULT_MAX_NAME) {
-  const cleaned = text2.replace(BREAKS, " ").replace(REMOVED, "").replace(/\s+/g, " ").trim();
-  return truncate(cleaned, maxChars);
-}
-function truncate(text2, maxChars) {
-  const points = Array.from(text2);
-  if (points.length <= maxChars) return text2;
-  return `${points.slice(0, Math.max(0, maxChars - 1)).join("").trimEnd()}\u2026`;
-}
-function escapeInline(text2, maxChars = DEFAULT_MAX_NAME) {
-  const plain = plainText(text2, maxChars);
-  let out = "";
-  for (const ch of plain) {
-    out += escapeChar(ch);
+// src/validate/ajv-issues.ts
+function valueAt(doc, pointer) {
+  if (pointer === "") return doc;
+  let node = doc;
+  for (const raw of pointer.slice(1).split("/")) {
+    const key = raw.replace(/~1/g, "/").replace(/~0/g, "~");
+    if (node === null || typeof node !== "object") return void 0;
+    node = node[key];
   }
-  return out.replace(/:\/\//g, `:${ZWJ}//`).replace(/\b(www)\./gi, `$1${ZWJ}.`).replace(/\b(GH)-(?=\d)/gi, `$1-${ZWJ}`);
+  return node;
 }
-function escapeChar(ch) {
-  switch (ch) {
-    case "&":
-      return "&amp;";
-    case "<":
-      return "&lt;";
-    case ">":
-      return "&gt;";
-    case "@":
-      return `@${ZWJ}`;
-    case "#":
-      return `\\#${ZWJ}`;
+function escapePointerToken(token) {
+  return token.replace(/~/g, "~0").replace(/\//g, "~1");
+}
+function typeName(value) {
+  if (value === null) return "null";
+  if (Array.isArray(value)) return "an array";
+  if (typeof value === "object") return "an object";
+  return `${typeof value} ${quote(value)}`;
+}
+function oneIssue(error2, file, doc) {
+  const pointer = error2.instancePath;
+  const value = valueAt(doc, pointer);
+  const params = error2.params;
+  switch (error2.keyword) {
+    case "required":
+      return {
+        file,
+        pointer: pointer === "" ? "/" : pointer,
+        expected: `must have the key "${String(params["missingProperty"])}"`,
+        hint: "Add it; see schema/fitgap-run-1.schema.json for the format."
+      };
+    case "additionalProperties": {
+      const key = String(params["additionalProperty"]);
+      return {
+        file,
+        pointer: `${pointer}/${escapePointerToken(key)}`,
+        expected: "is not a known key",
+        hint: "Check the spelling; unknown keys are rejected so that a typo cannot pass silently."
+      };
+    }
+    case "type":
+      return {
+        file,
+        pointer,
+        expected: `must be ${String(params["type"]) === "integer" ? "an integer" : `of type ${String(params["type"])}`}`,
+        got: typeName(value),
+        ...params["type"] === "number" && typeof value === "string" ? { hint: "Write numbers without quotes." } : {}
+      };
+    case "enum":
+      return {
+        file,
+        pointer,
+        expected: `must be one of ${params["allowedValues"].map((v) => quote(v)).join(", ")}`,
+        got: quote(value)
+      };
+    case "const":
+      return {
+        file,
+        pointer,
+        expected: `must be ${quote(params["allowedValue"])}`,
+        got: quote(value)
+      };
+    case "format":
+      return {
+        file,
+        pointer,
+        expected: `must be a ${String(params["format"])} string`,
+        got: quote(value),
+        ...params["format"] === "date-time" ? { hint: 'Use RFC 3339, e.g. "2026-11-30T10:00:00Z".' } : {}
+      };
     default:
-      return MARKDOWN_PUNCTUATION.has(ch) ? `\\${ch}` : ch;
+      return {
+        file,
+        pointer,
+        expected: error2.message ?? `fails ${error2.keyword}`,
+        got: quote(value)
+      };
   }
 }
-var MARKDOWN_PUNCTUATION = /* @__PURE__ */ new Set(["\\", "`", "*", "_", "[", "]", "|", "~", "$"]);
-function mermaidLabel(text2, maxChars = 60) {
-  const kept = plainText(text2, Number.MAX_SAFE_INTEGER).replace(/[^\p{L}\p{N} .,\-+()/=]/gu, " ").replace(/ {2,}/g, " ").trim();
-  return truncate(kept, maxChars);
+function ajvIssues(errors, file, doc) {
+  const seen = /* @__PURE__ */ new Set();
+  const issues = [];
+  for (const error2 of errors) {
+    const issue2 = oneIssue(error2, file, doc);
+    const key = `${issue2.pointer}|${issue2.expected}`;
+    if (seen.has(key)) continue;
+    seen.add(key);
+    issues.push(issue2);
+  }
+  return issues;
 }
-function displayValue(value) {
-  if (value === void 0) return "(absent)";
-  if (typeof value === "string") return value;
-  if (typeof value === "number" || typeof value === "boolean" || value === null) {
-    return String(value);
+function outOfRangeNumbers(doc, maxMagnitude, max2 = 10) {
+  const found = [];
+  const stack = [[doc, ""]];
+  while (stack.length > 0 && found.length < max2) {
+    const [node, pointer] = stack.pop();
+    if (typeof node === "number") {
+      if (!Number.isFinite(node) || Math.abs(node) > maxMagnitude)
+        found.push({ pointer, value: node });
+    } else if (Array.isArray(node)) {
+      for (let i2 = node.length - 1; i2 >= 0; i2--) stack.push([node[i2], `${pointer}/${i2}`]);
+    } else if (node !== null && typeof node === "object") {
+      const entries = Object.entries(node);
+      for (let i2 = entries.length - 1; i2 >= 0; i2--) {
+        const [k, v] = entries[i2];
+        stack.push([v, `${pointer}/${escapePointerToken(k)}`]);
+      }
+    }
+  }
+  return found;
+}
+
+// src/artifact/read-json.ts
+function lineAndColumn(text2, offset) {
+  let line = 1;
+  let last = -1;
+  for (let i2 = 0; i2 < offset && i2 < text2.length; i2++) {
+    if (text2.charCodeAt(i2) === 10) {
+      line++;
+      last = i2;
+    }
+  }
+  return { line, column: offset - last };
+}
+function errorOffset(text2, message) {
+  const position = /position (\d+)/.exec(message);
+  if (position?.[1] !== void 0) return Number(position[1]);
+  if (/Unexpected end of JSON input/.test(message)) return text2.length;
+  const context3 = /Unexpected token '(.)', (?:\.\.\.)?"([\s\S]*?)"(?:\.\.\.)? is not valid JSON/.exec(message);
+  if (context3?.[1] !== void 0 && context3[2] !== void 0) {
+    const at = text2.indexOf(context3[2]);
+    if (at >= 0) return at + Math.max(0, context3[2].indexOf(context3[1]));
+  }
+  return null;
+}
+var QUOTE = 34;
+var BACKSLASH = 92;
+function decodeKey(raw) {
+  if (!raw.includes("\\")) return raw;
+  try {
+    return JSON.parse(`"${raw}"`);
+  } catch {
+    return null;
+  }
+}
+function scanStructure(text2, maxDepth = MAX_JSON_DEPTH) {
+  const stack = [];
+  const duplicates = [];
+  const pointer = () => stack.slice(0, -1).map((f) => `/${f.object ? escapePointerToken(f.at) : String(f.index)}`).join("");
+  for (let i2 = 0; i2 < text2.length; i2++) {
+    const c = text2.charCodeAt(i2);
+    if (c === QUOTE) {
+      const start = i2 + 1;
+      i2++;
+      while (i2 < text2.length && text2.charCodeAt(i2) !== QUOTE) {
+        if (text2.charCodeAt(i2) === BACKSLASH) i2++;
+        i2++;
+      }
+      const top = stack[stack.length - 1];
+      if (top?.object === true && top.expectKey) {
+        const key = decodeKey(text2.slice(start, i2));
+        top.expectKey = false;
+        if (key !== null) {
+          top.at = key;
+          if (top.keys.has(key) && duplicates.length < 10) {
+            duplicates.push({ pointer: `${pointer()}/${escapePointerToken(key)}`, key });
+          }
+          top.keys.add(key);
+        }
+      }
+      continue;
+    }
+    if (c === 123 || c === 91) {
+      if (stack.length >= maxDepth) return { tooDeep: i2, duplicates };
+      stack.push({ object: c === 123, keys: /* @__PURE__ */ new Set(), at: "", index: 0, expectKey: c === 123 });
+    } else if (c === 125 || c === 93) {
+      stack.pop();
+    } else if (c === 44) {
+      const top = stack[stack.length - 1];
+      if (top !== void 0) {
+        if (top.object) top.expectKey = true;
+        else top.index++;
+      }
+    }
+  }
+  return { tooDeep: -1, duplicates };
+}
+function parseJson(text2, file) {
+  const body = text2.charCodeAt(0) === 65279 ? text2.slice(1) : text2;
+  const structure = scanStructure(body);
+  if (structure.tooDeep >= 0) {
+    const where = lineAndColumn(body, structure.tooDeep);
+    throw new InputError([
+      {
+        file,
+        pointer: `line ${where.line}, column ${where.column}`,
+        expected: `must not nest arrays and objects more than ${MAX_JSON_DEPTH} levels deep`,
+        hint: "A run artifact nests about five levels; flatten deep hyperparameter values."
+      }
+    ]);
+  }
+  let doc;
+  try {
+    doc = JSON.parse(body);
+  } catch (error2) {
+    const message = error2 instanceof Error ? error2.message : String(error2);
+    const offset = errorOffset(body, message);
+    const where = offset === null ? void 0 : lineAndColumn(body, offset);
+    throw new InputError([
+      {
+        file,
+        pointer: where === void 0 ? "" : `line ${where.line}, column ${where.column}`,
+        expected: "is not valid JSON",
+        got: (message.split(",")[0] ?? message).replace(/ in JSON at position \d+.*$/, "").slice(0, 80),
+        hint: "Fix the syntax (a missing comma or quote is the usual cause); `fitgap validate FILE` re-checks it."
+      }
+    ]);
+  }
+  if (structure.duplicates.length > 0) {
+    throw new InputError(
+      structure.duplicates.map(({ pointer, key }) => ({
+        file,
+        pointer,
+        expected: "must appear once in its object",
+        got: `the key ${quote(key)} again`,
+        hint: "JSON keeps only the last of duplicate keys; remove the one you did not mean."
+      }))
+    );
+  }
+  return doc;
+}
+
+// src/io/open-untrusted.ts
+import { constants as constants3 } from "node:fs";
+import { open as open2, realpath } from "node:fs/promises";
+import { Readable } from "node:stream";
+import { dirname, isAbsolute, relative, resolve } from "node:path";
+var MIB = 1024 * 1024;
+var DEFAULT_FILE_LIMITS = {
+  artifactBytes: 16 * MIB,
+  configBytes: 1 * MIB,
+  csvBytes: 512 * MIB
+};
+var LIMIT_NAMES = {
+  artifactBytes: { option: "max-artifact-mb", config: "artifact-mb" },
+  configBytes: { option: "max-config-mb", config: null },
+  csvBytes: { option: "max-csv-mb", config: "csv-mb" }
+};
+var LIMIT_RANGES_MB = {
+  artifactBytes: { min: 1e-3, max: 1024 },
+  configBytes: { min: 1e-3, max: 64 },
+  csvBytes: { min: 1e-3, max: 65536 }
+};
+function parseLimitMb(key, text2, label) {
+  const { min, max: max2 } = LIMIT_RANGES_MB[key];
+  const value = /^\s*(?:\d+(?:\.\d*)?|\.\d+)\s*$/.test(text2) ? Number(text2) : Number.NaN;
+  if (!(value >= min && value <= max2)) {
+    return {
+      issues: [
+        {
+          file: label,
+          pointer: "",
+          expected: `must be a number of MB from ${min} to ${max2}`,
+          got: JSON.stringify(text2)
+        }
+      ]
+    };
+  }
+  return { bytes: Math.round(value * MIB) };
+}
+var LIMIT_HINTS = {
+  artifactBytes: 'Raise the limit with --max-artifact-mb (action input "max-artifact-mb", config limits.artifact-mb) if the file is genuine.',
+  configBytes: 'Raise the limit with --max-config-mb (action input "max-config-mb") if the file is genuine.',
+  csvBytes: 'Raise the limit with --max-csv-mb (action input "max-csv-mb", config limits.csv-mb) if the file is genuine.'
+};
+var READ_CHUNK = 64 * 1024;
+var MissingFileError = class extends InputError {
+};
+function refuse2(target, expected, got, hint) {
+  const issue2 = { file: target.file, pointer: "", expected };
+  if (got !== void 0) issue2.got = got;
+  if (hint !== void 0) issue2.hint = hint;
+  throw new InputError([issue2]);
+}
+function describeCode(code) {
+  switch (code) {
+    case "ENOENT":
+      return "no such file";
+    case "EACCES":
+    case "EPERM":
+      return "permission denied";
+    case "ELOOP":
+      return "a symbolic link where none may be (or a loop of links)";
+    case "EISDIR":
+      return "a folder";
+    case "ENOTDIR":
+      return "a path through something that is not a folder";
+    case "ENXIO":
+      return "a socket or a device without a reader";
+    case "ENAMETOOLONG":
+      return "a name too long for the file system";
+    case "EIO":
+      return "an input/output error";
+    case "EMFILE":
+    case "ENFILE":
+      return "too many open files";
+    default:
+      return code ?? "an unknown error";
+  }
+}
+function errorCode(error2) {
+  return error2?.code;
+}
+function isInside(folder, path) {
+  const rel = relative(folder, path);
+  return rel !== "" && !rel.startsWith("..") && !isAbsolute(rel);
+}
+function kindOf(stats) {
+  if (stats.isDirectory()) return "a folder";
+  if (stats.isFIFO()) return "a named pipe (FIFO)";
+  if (stats.isSocket()) return "a socket";
+  if (stats.isCharacterDevice() || stats.isBlockDevice()) return "a device";
+  if (stats.isSymbolicLink()) return "a symbolic link";
+  return "not a regular file";
+}
+var MB = (bytes) => `${Math.round(bytes / MIB * 1e3) / 1e3} MB`;
+async function openChecked(target) {
+  const path = resolve(target.path);
+  const where = `could not be read as ${target.what}`;
+  let folder;
+  let real;
+  try {
+    folder = await realpath(resolve(target.folder ?? dirname(path)));
+    real = await realpath(path);
+  } catch (error2) {
+    const code = errorCode(error2);
+    if (code === "ENOENT")
+      throw new MissingFileError([
+        {
+          file: target.file,
+          pointer: "",
+          expected: where,
+          got: "no such file",
+          hint: "Check the path."
+        }
+      ]);
+    refuse2(target, where, describeCode(code), "Check the path.");
+  }
+  if (!isInside(folder, real)) {
+    refuse2(
+      target,
+      `must be a file inside ${target.folder === void 0 ? "the folder it is named in" : "the artifact's folder"}`,
+      "a link that leads outside it",
+      "Copy the file there instead of linking to it."
+    );
+  }
+  let handle;
+  try {
+    handle = await open2(
+      real,
+      constants3.O_RDONLY | constants3.O_NOFOLLOW | constants3.O_NONBLOCK | constants3.O_NOCTTY
+    );
+  } catch (error2) {
+    refuse2(target, where, describeCode(errorCode(error2)), "Check the path and its permissions.");
   }
   try {
-    return JSON.stringify(value) ?? String(value);
-  } catch {
-    return String(value);
+    const stats = await handle.stat();
+    if (!stats.isFile()) refuse2(target, `must be a regular file (${target.what})`, kindOf(stats));
+    const opened = await realpath(`/proc/self/fd/${handle.fd}`).catch(() => null);
+    if (opened !== null && opened !== real && !isInside(folder, opened)) {
+      refuse2(target, "must not change while it is opened", "a path that moved outside its folder");
+    }
+    const max2 = target.limits[target.limit];
+    if (stats.size > max2) {
+      refuse2(
+        target,
+        `must be at most ${MB(max2)} (${max2} bytes)`,
+        `${stats.size} bytes`,
+        LIMIT_HINTS[target.limit]
+      );
+    }
+    return { handle, size: stats.size, realPath: real, id: `${stats.dev}:${stats.ino}` };
+  } catch (error2) {
+    await handle.close().catch(() => void 0);
+    throw error2;
   }
 }
-
-// src/report/format.ts
-function numberFormatFor(review) {
-  let largest = 0;
-  for (const change of review.splits) {
-    largest = Math.max(largest, Math.abs(change.baseline), Math.abs(change.candidate));
+function grew(target) {
+  refuse2(
+    target,
+    `must be a regular file of fixed size (${target.what})`,
+    "more bytes than its size promised",
+    "Files that change while read (logs being written, files under /proc) are refused; copy it first."
+  );
+}
+async function readAt(target, handle, buffer, at) {
+  try {
+    const { bytesRead } = await handle.read(buffer, 0, buffer.length, at);
+    return bytesRead;
+  } catch (error2) {
+    refuse2(target, `could not be read as ${target.what}`, describeCode(errorCode(error2)));
   }
-  if (largest === 0 || !Number.isFinite(largest)) return { decimals: 4 };
-  const decimals = 3 - Math.floor(Math.log10(largest));
-  return { decimals: Math.min(6, Math.max(0, decimals)) };
 }
-function num(value, format) {
-  const text2 = value.toFixed(format.decimals);
-  return /^-0(\.0+)?$/.test(text2) ? text2.slice(1) : text2;
+async function readChecked(target) {
+  const file = await openChecked(target);
+  try {
+    const bytes = Buffer.alloc(file.size);
+    let at = 0;
+    while (at < file.size) {
+      const n = await readAt(target, file.handle, bytes.subarray(at), at);
+      if (n === 0) break;
+      at += n;
+    }
+    if (await readAt(target, file.handle, Buffer.alloc(1), at) > 0) grew(target);
+    return { bytes: at === file.size ? bytes : bytes.subarray(0, at), file };
+  } finally {
+    await file.handle.close().catch(() => void 0);
+  }
 }
-function signed(value, format) {
-  const text2 = num(Math.abs(value), format);
-  if (/^0(\.0+)?$/.test(text2)) return text2;
-  return value > 0 ? `+${text2}` : `\u2212${text2}`;
-}
-function interval(ci, format) {
-  if (ci === null) return "n/a";
-  return `[${signed(ci[0], format)}, ${signed(ci[1], format)}]`;
-}
-function pValue(p) {
-  if (p === null) return "p n/a";
-  if (p < 1e-3) return "p < 0.001";
-  return `p = ${p.toFixed(3)}`;
-}
-function count(n) {
-  return Math.round(n).toString().replace(/\B(?=(\d{3})+(?!\d))/g, ",");
-}
-function short(value) {
-  if (value === 0) return "0";
-  const abs = Math.abs(value);
-  if (abs >= 1e6 || abs < 1e-4) return value.toExponential(2);
-  return String(Number(value.toPrecision(4)));
-}
-function chartNumber(value, decimals) {
-  const text2 = value.toFixed(decimals);
-  return /^-0(\.0+)?$/.test(text2) ? text2.slice(1) : text2;
-}
-
-// src/report/words.ts
-var MOVEMENT_TITLE = {
-  "better-on-both": "less bias and less variance",
-  "away-from-underfitting": "away from underfitting",
-  "toward-overfitting": "toward overfitting",
-  "away-from-overfitting": "away from overfitting",
-  "no-significant-change": "no change beyond noise",
-  "toward-underfitting": "toward underfitting",
-  "worse-on-both": "more bias and more variance"
-};
-var MOVEMENT_SENTENCE = {
-  "better-on-both": "The change lowered both avoidable bias and variance",
-  "away-from-underfitting": "The change moved the model away from underfitting",
-  "toward-overfitting": "The change moved the model toward overfitting",
-  "away-from-overfitting": "The change moved the model away from overfitting",
-  "no-significant-change": "The change did not move avoidable bias or variance beyond run-to-run noise",
-  "toward-underfitting": "The change moved the model toward underfitting",
-  "worse-on-both": "The change raised both avoidable bias and variance"
-};
-var VALIDATION_WORD = {
-  better: "better",
-  worse: "worse",
-  flat: "unchanged within noise"
-};
-var DIAGNOSIS_WORD = {
-  "good-fit": "good fit",
-  "high-bias": "high bias (underfitting)",
-  "high-variance": "high variance (overfitting)",
-  "data-mismatch": "data mismatch",
-  "high-bias-and-variance": "high bias and high variance"
-};
-var COMPONENT_WORD = {
-  bias: "Avoidable bias",
-  variance: "Variance",
-  mismatch: "Data mismatch",
-  overfit: "Validation overfit"
-};
-var COMPONENT_ORDER = [
-  "bias",
-  "variance",
-  "mismatch",
-  "overfit"
-];
-var SPLIT_WORD = {
-  train: "train",
-  train_dev: "train-dev",
-  validation: "validation",
-  test: "test"
-};
-var LEVER_TITLE = {
-  "more-data": "Add training data",
-  "fewer-features": "Use fewer features",
-  "stronger-regularization": "Strengthen regularization",
-  "smaller-model": "Use a smaller model",
-  "early-stopping": "Stop training earlier",
-  "more-features": "Add features",
-  "richer-features": "Add polynomial or interaction terms",
-  "weaker-regularization": "Weaken regularization",
-  "bigger-model": "Use a bigger model",
-  "train-longer": "Train longer",
-  "align-training-data": "Make training data look like validation data",
-  "bigger-validation-set": "Use a bigger validation set",
-  "add-repeats": "Repeat each run with several seeds",
-  "supply-reference": "Supply a reference error level"
-};
-var TEST_WORD = {
-  "welch-t": "Welch's t-test",
-  "z-binomial": "binomial z-test",
-  "mcnemar-exact": "McNemar's exact test",
-  "paired-t": "paired t-test",
-  none: "no test"
-};
-var TEST_WHY = {
-  "welch-t": "Welch's t-test on per-repeat values: each run has two or more repeats (seeds), and their spreads may differ.",
-  "z-binomial": "normal approximation with binomial variances: one repeat of a proportion metric measured on a known number of examples.",
-  "mcnemar-exact": "McNemar's exact test: both runs scored the same examples, so only the examples on which they disagree carry information.",
-  "paired-t": "paired t-test on per-example loss differences: both runs scored the same examples with a continuous loss.",
-  none: "no test: with one repeat of a continuous metric and no paired predictions, run-to-run noise is unknown, so only min-effect decides."
-};
-function reading(call, review) {
-  if (call === "flat") return "flat";
-  const up = call === "up";
-  return up === (review.metric.goal === "maximize") ? "better" : "worse";
-}
-function componentReading(call) {
-  if (call === "up") return "up (worse)";
-  if (call === "down") return "down (better)";
-  return "flat";
-}
-function levelPercent(review) {
-  return String(Number(((1 - review.settings.alpha) * 100).toPrecision(4)));
-}
-var CAUTION = "This verdict is advice for a human reviewer, not a proof: it rests on the numbers the two runs recorded and on the tests named in the method notes.";
-
-// src/report/tables.ts
-function splitsTable(review) {
-  const f = numberFormatFor(review);
-  return {
-    header: [
-      "Split",
-      "Baseline",
-      "Candidate",
-      "\u0394",
-      `${levelPercent(review)}% interval`,
-      "p",
-      "Reading"
-    ],
-    align: ["l", "r", "r", "r", "r", "r", "l"],
-    rows: review.splits.map((s) => [
-      SPLIT_WORD[s.split],
-      num(s.baseline, f),
-      num(s.candidate, f),
-      signed(s.delta.estimate, f),
-      interval(s.delta.ci, f),
-      pValue(s.delta.p).replace(/^p /, "").replace(/^= /, ""),
-      reading(s.delta.call, review)
-    ])
-  };
-}
-function decompositionTable(review, compact = false) {
-  const f = numberFormatFor(review);
-  const cell = (run, name) => {
-    const c = review[run].components[name];
-    if (c.value === null) return "n/a";
-    return `${num(c.value, f)}${c.present ? compact ? "*" : " (present)" : ""}`;
-  };
-  const deltas = {
-    bias: review.bias.delta,
-    variance: review.variance.delta,
-    mismatch: review.mismatch.delta,
-    overfit: review.overfit.delta
-  };
-  const rows = COMPONENT_ORDER.map((name) => {
-    const d = deltas[name];
-    return [
-      COMPONENT_WORD[name],
-      cell("baseline", name),
-      cell("candidate", name),
-      d === null ? "n/a" : signed(d.estimate, f),
-      d === null ? "n/a" : interval(d.ci, f),
-      d === null ? "n/a" : pValue(d.p).replace(/^p /, "").replace(/^= /, ""),
-      d === null ? "n/a" : componentReading(d.call)
-    ];
-  });
-  rows.push([
-    "Diagnosis",
-    DIAGNOSIS_WORD[review.baseline.diagnosis],
-    DIAGNOSIS_WORD[review.candidate.diagnosis],
-    "",
-    "",
-    "",
-    ""
-  ]);
-  const table2 = {
-    header: [
-      "Component",
-      "Baseline",
-      "Candidate",
-      "\u0394",
-      `${levelPercent(review)}% interval`,
-      "p",
-      "Call"
-    ],
-    align: ["l", "r", "r", "r", "r", "r", "l"],
-    rows
-  };
-  if (!compact) return table2;
-  const shorter = (row) => [
-    ...row.slice(0, 5),
-    (row[6] ?? "").replace(/^(up|down) \((\w+)\)$/, "$2")
-  ];
-  return {
-    header: shorter(table2.header),
-    align: ["l", "r", "r", "r", "r", "l"],
-    rows: table2.rows.map(shorter)
-  };
-}
-function unavailableNotes(review, esc) {
-  const seen = /* @__PURE__ */ new Set();
-  for (const run of ["baseline", "candidate"]) {
-    for (const name of COMPONENT_ORDER) {
-      const c = review[run].components[name];
-      if (c.value === null && c.unavailable !== void 0) {
-        seen.add(`${COMPONENT_WORD[name]}: ${esc(c.unavailable, 300)}`);
+async function streamChecked(target) {
+  const file = await openChecked(target);
+  async function* chunks() {
+    try {
+      let at = 0;
+      while (at < file.size) {
+        const buffer = Buffer.alloc(Math.min(READ_CHUNK, file.size - at));
+        const n = await readAt(target, file.handle, buffer, at);
+        if (n === 0) return;
+        at += n;
+        yield n === buffer.length ? buffer : buffer.subarray(0, n);
       }
+      if (await readAt(target, file.handle, Buffer.alloc(1), at) > 0) grew(target);
+    } finally {
+      await file.handle.close().catch(() => void 0);
     }
   }
-  return [...seen];
+  return { stream: Readable.from(chunks(), { objectMode: false }), file };
 }
-function leversTable(review, esc) {
-  return {
-    header: ["#", "Lever", "Why", "Evidence"],
-    align: ["r", "l", "l", "l"],
-    rows: review.levers.map((lever, i2) => [
-      String(i2 + 1),
-      LEVER_TITLE[lever.id],
-      esc(lever.reason, 300),
-      lever.evidence.map((e) => esc(e, 200)).join(" \xB7 ") || "\u2014"
-    ])
-  };
+function firstInvalidUtf8(bytes) {
+  let i2 = 0;
+  while (i2 < bytes.length) {
+    const b = bytes[i2] ?? 0;
+    if (b < 128) {
+      i2++;
+      continue;
+    }
+    let need;
+    let low = 128;
+    let high = 191;
+    if (b >= 194 && b <= 223) need = 1;
+    else if (b >= 224 && b <= 239) {
+      need = 2;
+      if (b === 224) low = 160;
+      if (b === 237) high = 159;
+    } else if (b >= 240 && b <= 244) {
+      need = 3;
+      if (b === 240) low = 144;
+      if (b === 244) high = 143;
+    } else return i2;
+    for (let k = 1; k <= need; k++) {
+      const c = bytes[i2 + k];
+      if (c === void 0 || c < (k === 1 ? low : 128) || c > (k === 1 ? high : 191)) return i2;
+    }
+    i2 += need + 1;
+  }
+  return -1;
 }
-function sliceHarm(slice, review) {
-  return review.metric.goal === "minimize" ? slice.delta.estimate : -slice.delta.estimate;
-}
-function sortSlices(review) {
-  const rank = (s) => s.hiddenRegression ? 0 : s.change === "worse" ? 1 : s.change === "flat" ? 2 : 3;
-  return [...review.slices].sort(
-    (a, b) => rank(a) - rank(b) || sliceHarm(b, review) - sliceHarm(a, review) || (a.name < b.name ? -1 : a.name > b.name ? 1 : 0)
-  );
-}
-function slicesTable(review, esc, limit) {
-  const f = numberFormatFor(review);
-  const rows = sortSlices(review).slice(0, limit).map((s) => [
-    esc(s.name),
-    s.examples === null ? "n/a" : count(s.examples),
-    num(s.baseline, f),
-    num(s.candidate, f),
-    signed(s.delta.estimate, f),
-    s.pAdjusted === null ? "n/a" : pValue(s.pAdjusted).replace(/^p /, "").replace(/^= /, ""),
-    s.hiddenRegression ? "worse (hidden)" : s.change
+function decodeUtf8(bytes, file, what) {
+  const bad = firstInvalidUtf8(bytes);
+  if (bad < 0)
+    return Buffer.from(bytes.buffer, bytes.byteOffset, bytes.byteLength).toString("utf8");
+  let line = 1;
+  for (let i2 = 0; i2 < bad; i2++) if (bytes[i2] === 10) line++;
+  throw new InputError([
+    {
+      file,
+      pointer: `line ${line}`,
+      expected: `must be UTF-8 text (${what})`,
+      got: "an invalid UTF-8 sequence",
+      hint: bytes[0] === 255 && bytes[1] === 254 || bytes[0] === 254 && bytes[1] === 255 ? "The file looks like UTF-16; save it as UTF-8." : "Save the file as UTF-8."
+    }
   ]);
-  return {
-    header: ["Slice", "Examples", "Baseline", "Candidate", "\u0394", "p (Holm)", "Change"],
-    align: ["l", "r", "r", "r", "r", "r", "l"],
-    rows
-  };
-}
-function sliceCounts(slices) {
-  const out = { worse: 0, better: 0, flat: 0 };
-  for (const s of slices) out[s.change] += 1;
-  return out;
-}
-var MAX_HYPERPARAMETER_ROWS = 50;
-function hyperparameterTable(review, esc) {
-  return {
-    header: ["Hyperparameter", "Baseline", "Candidate", "Change"],
-    align: ["l", "l", "l", "l"],
-    rows: review.hyperparameters.slice(0, MAX_HYPERPARAMETER_ROWS).map((h) => [
-      esc(h.key),
-      h.kind === "added" ? "(absent)" : esc(displayValue(h.baseline), 60),
-      h.kind === "removed" ? "(absent)" : esc(displayValue(h.candidate), 60),
-      h.kind
-    ])
-  };
 }
 
-// src/report/headline.ts
-function changePhrase(name, delta2, review) {
-  const f = numberFormatFor(review);
-  if (delta2 === null) return `${name} unknown`;
-  const level = levelPercent(review);
-  const stats = delta2.ci === null ? `${signed(delta2.estimate, f)}, noise unknown` : `${signed(delta2.estimate, f)}, ${level}% interval ${interval(delta2.ci, f)}, ${pValue(delta2.p)}`;
-  const word = delta2.call === "up" ? "rose" : delta2.call === "down" ? "fell" : "held steady";
-  return `${name} ${word} (${stats})`;
-}
-function buildHeadline(review, esc) {
-  const f = numberFormatFor(review);
-  const metric = esc(review.metric.name, 60);
-  const v = review.validation;
-  const vBase = review.splits.find((s) => s.split === "validation");
-  const movementTone = review.movement === "better-on-both" || review.movement === "away-from-overfitting" || review.movement === "away-from-underfitting" ? "good" : review.movement === "no-significant-change" ? "neutral" : "bad";
-  const vTone = v.change === "better" ? "good" : v.change === "worse" ? "bad" : "neutral";
-  const level = levelPercent(review);
-  const vStats = v.delta.ci === null ? `\u0394 ${signed(v.delta.estimate, f)}; run-to-run noise unknown` : `\u0394 ${signed(v.delta.estimate, f)}, ${level}% interval ${interval(v.delta.ci, f)}, ${pValue(v.delta.p)}, ${TEST_WORD[v.delta.test]}`;
-  const from = vBase === void 0 ? "" : `${num(vBase.baseline, f)} \u2192 ${num(vBase.candidate, f)} `;
-  const lines = [
-    {
-      label: MOVEMENT_SENTENCE[review.movement],
-      text: `${changePhrase(
-        "avoidable bias",
-        review.bias.delta,
-        review
-      )}; ${changePhrase("variance", review.variance.delta, review)}. Diagnosis: baseline ${DIAGNOSIS_WORD[review.baseline.diagnosis]}, candidate ${DIAGNOSIS_WORD[review.candidate.diagnosis]}.`,
-      tone: movementTone
-    },
-    {
-      label: `Validation ${metric} ${VALIDATION_WORD[v.change]}`,
-      text: `${from}(${vStats}).`,
-      tone: vTone
-    }
-  ];
-  const gate = review.gate;
-  lines.push({
-    label: gate.pass ? "Gate passed" : "Gate failed",
-    text: gate.pass ? gate.failOn.length === 0 ? "no fail-on policy is set." : `none of fail-on (${gate.failOn.map((p) => esc(p, 60)).join(", ")}) applies.` : `${gate.reasons.map((r) => esc(r, 200)).join("; ")}.`,
-    tone: gate.pass ? "good" : "bad"
-  });
-  const first = review.levers[0];
-  lines.push(
-    first === void 0 ? { label: "Next lever", text: "none suggested.", tone: "neutral" } : {
-      label: `Next lever: ${LEVER_TITLE[first.id]}`,
-      text: esc(first.reason, 300),
-      tone: "neutral"
-    }
-  );
-  const hidden = sortSlices(review).filter((s) => s.hiddenRegression);
-  const worst = hidden[0];
-  if (worst !== void 0) {
-    lines.push({
-      label: `${hidden.length} ${hidden.length === 1 ? "slice" : "slices"} got worse while validation improved`,
-      text: `worst: ${esc(worst.name, 60)} (${signed(worst.delta.estimate, f)}).`,
-      tone: "bad"
-    });
-  }
-  const title = `${MOVEMENT_TITLE[review.movement]} \xB7 validation ${VALIDATION_WORD[v.change]} \xB7 gate ${gate.pass ? "passed" : "failed"}`;
-  return { title, tone: gate.pass ? movementTone : "bad", lines };
-}
-
-// src/report/marker.ts
-var KEY_PATTERN = /^[A-Za-z0-9._-]{1,64}$/;
-var MARKER_PATTERN = /<!-- fitgap:review key=([A-Za-z0-9._-]{1,64}) head=([0-9a-f]{0,64}) -->/;
-function isValidCommentKey(key) {
-  return KEY_PATTERN.test(key);
-}
-function buildMarker(marker) {
-  if (!isValidCommentKey(marker.key)) {
-    throw new RangeError(
-      `comment key ${JSON.stringify(marker.key)} must be 1-64 letters, digits, '.', '_' or '-'`
-    );
-  }
-  const head = /^[0-9a-f]{0,64}$/.test(marker.head) ? marker.head : "";
-  return `<!-- fitgap:review key=${marker.key} head=${head} -->`;
-}
-function parseMarker(body) {
-  const match = MARKER_PATTERN.exec(body);
-  if (match === null) return null;
-  return { key: match[1] ?? "", head: match[2] ?? "" };
-}
-
-// src/report/mermaid.ts
-var MAX_POINTS = 100;
-var PALETTE = {
-  baselineValidation: ["#1f5fa8", "dark blue"],
-  baselineTrain: ["#8fbce6", "light blue"],
-  candidateValidation: ["#c2410c", "dark orange"],
-  candidateTrain: ["#f6b07a", "light orange"]
-};
-function buildCharts(review) {
-  const charts = [];
-  const plane = planeChart(review);
-  if (plane !== null) charts.push(plane);
-  for (const curve of ["epochs", "training_examples", "regularization"]) {
-    charts.push(...curveCharts(review, curve));
-  }
-  return charts;
-}
-function planeThreshold(review) {
-  const level = (review.baseline.errorLevel + review.candidate.errorLevel) / 2;
-  return Math.max(review.settings.gapTolerance * Math.abs(level), review.settings.minEffect);
-}
-function planeChart(review) {
-  const points = [];
-  for (const run of ["baseline", "candidate"]) {
-    const { bias, variance } = review[run].components;
-    if (bias.value === null || variance.value === null) return null;
-    points.push([run, bias.value, variance.value]);
-  }
-  const t = planeThreshold(review);
-  if (!(t > 0) || !Number.isFinite(t)) return null;
-  const axis = (v) => chartNumber(v <= 0 ? 0 : v / (v + t), 3);
-  const format = numberFormatFor(review);
-  const lines = [
-    "quadrantChart",
-    "  title Avoidable bias and variance of both runs",
-    '  x-axis "Low avoidable bias" --> "High avoidable bias"',
-    '  y-axis "Low variance" --> "High variance"',
-    '  quadrant-1 "Both present"',
-    '  quadrant-2 "Variance present"',
-    '  quadrant-3 "Neither present"',
-    '  quadrant-4 "Bias present"',
-    ...points.map(([run, b, v]) => `  "${run}": [${axis(b)}, ${axis(v)}]`)
-  ];
-  const metric = escapeInline(review.metric.name, 40);
-  const values = points.map(([run, b, v]) => `${run} bias ${num(b, format)}, variance ${num(v, format)}`).join("; ");
-  const caption = `**Bias/variance plane** (${metric}, shortfall units). Each axis is scaled so that its middle line is the presence threshold, ${num(t, format)} (gap tolerance ${short(review.settings.gapTolerance)} \xD7 the mean validation error level); right of it avoidable bias is large enough to count, above it variance. Values: ${values}.`;
-  return { kind: "plane", caption, code: lines.join("\n") };
-}
-var CURVE_TEXT = {
-  epochs: { title: "Epoch curve", x: "epoch", caption: "Epoch curve" },
-  training_examples: {
-    title: "Learning curve",
-    x: "training examples",
-    caption: "Learning curve"
-  },
-  regularization: {
-    title: "Regularization curve",
-    x: "regularization strength",
-    caption: "Regularization curve"
-  }
-};
-function usable(evidence) {
-  if (evidence === void 0 || isSkipped(evidence)) return null;
-  const chart2 = evidence.chart.filter((p) => Number.isFinite(p.x) && Number.isFinite(p.validation));
-  return chart2.length >= 2 ? chart2 : null;
-}
-function isSkipped(evidence) {
-  return "skipped" in evidence;
-}
-function seriesOf(run, summary2, curve) {
-  const points = usable(summary2.curves[curve]);
-  if (points === null) return [];
-  const sorted = [...points].sort((a, b) => a.x - b.x);
-  const out = [
-    { run, part: "validation", points: sorted.map((p) => [p.x, p.validation]) }
-  ];
-  const train = sorted.filter((p) => p.train !== void 0 && Number.isFinite(p.train));
-  if (train.length >= 2) {
-    out.push({ run, part: "train", points: train.map((p) => [p.x, p.train ?? 0]) });
-  }
-  return out;
-}
-function curveCharts(review, curve) {
-  const all = [
-    ...seriesOf("baseline", review.baseline, curve),
-    ...seriesOf("candidate", review.candidate, curve)
-  ];
-  if (all.length === 0) return [];
-  const runs = [...new Set(all.map((s) => s.run))];
-  const ranges = runs.map((run) => {
-    const xs = all.filter((s) => s.run === run).flatMap((s) => s.points.map((p) => p[0]));
-    return [Math.min(...xs), Math.max(...xs)];
-  });
-  const lo = Math.max(...ranges.map((r) => r[0]));
-  const hi = Math.min(...ranges.map((r) => r[1]));
-  const unionLo = Math.min(...ranges.map((r) => r[0]));
-  const unionHi = Math.max(...ranges.map((r) => r[1]));
-  const yAll = all.flatMap((s) => s.points.map((p) => p[1]));
-  const yRange = [Math.min(...yAll), Math.max(...yAll)];
-  if (runs.length === 1) {
-    const run = runs[0] ?? "candidate";
-    if (!(hi > lo)) return [];
-    const chart2 = lineChart(review, curve, all, [lo, hi], yRange, run);
-    const other = run === "baseline" ? "candidate" : "baseline";
-    return [
-      { ...chart2, caption: `${chart2.caption} The ${other} has no chartable curve of this kind.` }
-    ];
-  }
-  if (hi > lo && hi - lo >= 0.8 * (unionHi - unionLo)) {
-    return [lineChart(review, curve, all, [lo, hi], yRange, null)];
-  }
-  return runs.flatMap((run) => {
-    const series = all.filter((s) => s.run === run);
-    const range = ranges[runs.indexOf(run)] ?? [lo, hi];
-    if (!(range[1] > range[0])) return [];
-    return [lineChart(review, curve, series, [range[0], range[1]], yRange, run)];
-  });
-}
-function lineChart(review, curve, series, [lo, hi], [yMin, yMax], only) {
-  const text2 = CURVE_TEXT[curve];
-  const ordered = orderSeries(series);
-  const xs = [
-    ...new Set(ordered.flatMap((s) => s.points.map((p) => p[0])).filter((x2) => x2 >= lo && x2 <= hi))
-  ].sort((a, b) => a - b);
-  const geometric = curve !== "epochs" && lo > 0 && hi / lo >= 10;
-  const grid = geometric ? thin(xs, MAX_POINTS) : evenGrid(lo, hi, Math.min(MAX_POINTS, xs.length));
-  const yPad = (yMax - yMin) * 0.05 || Math.abs(yMax) * 0.05 || 1;
-  const y0 = yMin - yPad;
-  const y1 = yMax + yPad;
-  const yDecimals = Math.min(6, Math.max(0, 2 - Math.floor(Math.log10(y1 - y0))));
-  const xDecimals = Number.isInteger(lo) && Number.isInteger(hi) ? 0 : Math.min(6, Math.max(0, 2 - Math.floor(Math.log10(Math.max(hi - lo, 1e-9)))));
-  const metric = mermaidLabel(review.metric.name, 40) || "metric";
-  const unit = review.metric.kind === "proportion" ? "proportion" : "metric units";
-  const title = only === null ? text2.title : `${text2.title}, ${only}`;
-  const palette = ordered.map((s) => PALETTE[paletteKey(s)][0]).join(", ");
-  const lines = [
-    `%%{init: {"themeVariables": {"xyChart": {"plotColorPalette": "${palette}"}}}}%%`,
-    "xychart-beta",
-    `  title "${title}"`,
-    geometric ? `  x-axis "${text2.x}" [${grid.map((x2) => `"${short(x2)}"`).join(", ")}]` : `  x-axis "${text2.x}" ${chartNumber(lo, xDecimals)} --> ${chartNumber(hi, xDecimals)}`,
-    `  y-axis "${metric} (${unit})" ${chartNumber(y0, yDecimals)} --> ${chartNumber(y1, yDecimals)}`,
-    ...ordered.map(
-      (s) => `  line [${grid.map((x2) => chartNumber(interpolate(s.points, x2, geometric), yDecimals + 1)).join(", ")}]`
-    )
-  ];
-  const legend = ordered.map((s) => `${PALETTE[paletteKey(s)][1]} = ${s.run} ${s.part}`).join(", ");
-  const scale = geometric ? " The x positions are evenly spaced categories (roughly a log scale)." : "";
-  const clipped = only === null && series.some((s) => s.points.some((p) => p[0] < lo || p[0] > hi)) ? ` Drawn over the x range both runs cover (${short(lo)} to ${short(hi)}).` : "";
-  const caption = `**${text2.caption}${only === null ? "" : ` (${only})`}**, ${escapeInline(
-    review.metric.name,
-    40
-  )} by ${text2.x}. Lines: ${legend}.${scale}${clipped}`;
-  return { kind: curve, caption, code: lines.join("\n") };
-}
-function paletteKey(s) {
-  return s.part === "validation" ? `${s.run}Validation` : `${s.run}Train`;
-}
-function orderSeries(series) {
-  const rank = (s) => (s.run === "baseline" ? 0 : 2) + (s.part === "train" ? 1 : 0);
-  return [...series].sort((a, b) => rank(a) - rank(b));
-}
-function evenGrid(lo, hi, n) {
-  const count2 = Math.max(2, n);
-  return Array.from({ length: count2 }, (_, i2) => lo + (hi - lo) * i2 / (count2 - 1));
-}
-function thin(values, max2) {
-  if (values.length <= max2) return values;
-  return Array.from(
-    { length: max2 },
-    (_, i2) => values[Math.round(i2 * (values.length - 1) / (max2 - 1))] ?? 0
-  );
-}
-function interpolate(points, x2, logX) {
-  const first = points[0];
-  const last = points[points.length - 1];
-  if (first === void 0 || last === void 0) return Number.NaN;
-  if (x2 <= first[0]) return first[1];
-  if (x2 >= last[0]) return last[1];
-  const f = (v) => logX ? Math.log(v) : v;
-  for (let i2 = 1; i2 < points.length; i2 += 1) {
-    const a = points[i2 - 1];
-    const b = points[i2];
-    if (a === void 0 || b === void 0) continue;
-    if (x2 <= b[0]) {
-      const span = f(b[0]) - f(a[0]);
-      const w = span === 0 ? 0 : (f(x2) - f(a[0])) / span;
-      return a[1] + w * (b[1] - a[1]);
-    }
-  }
-  return last[1];
-}
-
-// src/report/notes.ts
-function methodNotes(review, esc) {
-  const s = review.settings;
-  const lines = [
-    `alpha = ${short(s.alpha)}: a change counts as up or down only when it is significant at this level and at least min-effect in size; intervals are ${levelPercent(review)}%.`,
-    `min-effect = ${short(s.minEffect)} (${review.metric.kind === "proportion" ? "proportion" : "metric units"}): smaller changes are called flat however significant.`,
-    `gap tolerance = ${short(s.gapTolerance)}: a component is present when it is at least this share of the run's validation error level (and at least min-effect, and significantly above 0 where its noise is known).`,
-    `fail-on = ${s.failOn.length === 0 ? "(empty: the gate always passes)" : s.failOn.map((p) => esc(p, 60)).join(", ")}.`
-  ];
-  const uses = /* @__PURE__ */ new Map();
-  const use = (what, delta2) => {
-    if (delta2 === null) return;
-    uses.set(delta2.test, [...uses.get(delta2.test) ?? [], what]);
-  };
-  use("validation change", review.validation.delta);
-  use("avoidable bias", review.bias.delta);
-  use("variance", review.variance.delta);
-  use("data mismatch", review.mismatch.delta);
-  use("validation overfit", review.overfit.delta);
-  for (const split of review.splits) use(`${SPLIT_WORD[split.split]} split`, split.delta);
-  if (review.slices.length > 0) {
-    const tests = [...new Set(review.slices.map((x2) => x2.delta.test))];
-    for (const t of tests) uses.set(t, [...uses.get(t) ?? [], "slices"]);
-  }
-  for (const [test, what] of uses) {
-    lines.push(`${[...new Set(what)].join(", ")}: ${TEST_WHY[test]}`);
-  }
-  if (review.slices.length > 0) {
-    lines.push(
-      `Slice p-values are adjusted with the Holm\u2013Bonferroni method over all ${count(review.slices.length)} slices, so a few bad slices among many are not flagged by chance.`
-    );
-  }
-  if (review.paired !== null) {
-    const d = review.paired.discordant;
-    lines.push(
-      `Paired predictions: ${count(review.paired.rows)} examples scored by both runs${d === void 0 ? "" : `; ${count(d.baselineOnly)} right only in the baseline, ${count(d.candidateOnly)} right only in the candidate`}.`
-    );
-  }
-  for (const run of ["baseline", "candidate"]) {
-    const r = review[run];
-    lines.push(referenceLine(run, r, review));
-    for (const w of r.warnings) lines.push(`${run}: ${esc(w, 300)}`);
-  }
-  for (const n of review.notes) lines.push(esc(n, 300));
-  for (const n of review.nonLevers) lines.push(esc(n, 300));
-  return lines;
-}
-function referenceLine(run, r, review) {
-  const f = numberFormatFor(review);
-  if (r.reference === null) {
-    return `${run}: no reference level, so avoidable bias is unknown; set \`reference\` in the artifact or the config.`;
-  }
-  const source = {
-    artifact: "from the artifact",
-    config: "from the config",
-    default: "the default for a minimized proportion",
-    unknown: "source unknown"
-  }[r.referenceSource];
-  return `${run}: reference level ${num(r.reference, f)} (${source}).`;
-}
-var CURVE_WORD = {
-  epochs: "Epoch curve",
-  training_examples: "Learning curve",
-  regularization: "Regularization curve"
-};
-function skipped(e) {
-  return "skipped" in e;
-}
-function curveEvidence(review, esc) {
-  const f = numberFormatFor(review);
-  const lines = [];
-  for (const run of ["baseline", "candidate"]) {
-    const curves = review[run].curves;
-    const e = curves.epochs;
-    if (e !== void 0) {
-      lines.push(
-        skipped(e) ? `${run}, ${CURVE_WORD.epochs}: not analysed (${esc(e.skipped, 200)}).` : `${run}, ${CURVE_WORD.epochs}: lowest validation ${num(e.bestValidation, f)} at epoch ${short(e.bestX)}; final ${num(e.finalValidation, f)} at epoch ${short(e.finalX)}; ${e.gl === null ? "generalization loss undefined (best validation is 0)" : `generalization loss ${e.gl.toFixed(1)}%`}${e.pq === null ? "" : `, progress quotient ${e.pq.toFixed(2)}`}${e.stoppedLate ? "; trained past the minimum" : ""}${e.stoppedEarly ? "; still improving at the end" : ""}.`
-      );
-    }
-    const l = curves.training_examples;
-    if (l !== void 0) {
-      const lp = skipped(l) ? "" : l.projections.map(
-        (p) => `${short(p.x)} examples \u2192 ${num(p.validation, f)} [${num(p.ci[0], f)}, ${num(p.ci[1], f)}]`
-      ).join("; ");
-      lines.push(
-        skipped(l) ? `${run}, ${CURVE_WORD.training_examples}: not analysed (${esc(l.skipped, 200)}).` : `${run}, ${CURVE_WORD.training_examples}: power-law fit R\xB2 ${l.r2.toFixed(3)}, residual sd ${num(l.residual, f)}; projected validation: ${lp || "none"}; train/validation gap ${l.gapTrend}.`
-      );
-    }
-    const g = curves.regularization;
-    if (g !== void 0) {
-      lines.push(
-        skipped(g) ? `${run}, ${CURVE_WORD.regularization}: not analysed (${esc(g.skipped, 200)}).` : `${run}, ${CURVE_WORD.regularization}: lowest validation ${num(g.bestValidation, f)} at strength ${short(g.bestX)}; the run's own strength is ${g.side === "at" ? "at" : g.side === "unknown" ? "at an unknown place relative to" : g.side} the best; suggested ${short(g.suggestedX)}${g.atEdge === null ? "" : `; the minimum is at the ${g.atEdge} end of the sweep, so extend it`}.`
-      );
-    }
-  }
-  return lines;
-}
-function provenanceTables(review, esc, files) {
-  const runs = {
-    header: ["Run", "Name", "Commit", "Created"],
-    align: ["l", "l", "l", "l"],
-    rows: ["baseline", "candidate"].map((run) => {
-      const r = review[run];
-      return [
-        run,
-        esc(r.name),
-        r.commit === null ? "n/a" : esc(r.commit, 64),
-        r.createdAt === null ? "n/a" : esc(r.createdAt, 40)
-      ];
-    })
-  };
-  if (files.length === 0) return [runs];
-  const fileTable = {
-    header: ["File", "Path", "sha256"],
-    align: ["l", "l", "l"],
-    rows: files.map((file) => [esc(file.label, 40), esc(file.path, 120), esc(file.sha256, 64)])
-  };
-  return [runs, fileTable];
-}
-
-// src/report/markdown.ts
-var GITHUB_COMMENT_LIMIT = 65536;
-var DEFAULT_TARGET_LENGTH = 6e4;
-var SLICES_SHOWN = 20;
-var SLICES_WHEN_SHORT = 5;
-var STAGES = [
-  { slices: SLICES_SHOWN, charts: true, methodNotes: true, rest: true },
-  { slices: SLICES_WHEN_SHORT, charts: true, methodNotes: true, rest: true },
-  { slices: SLICES_WHEN_SHORT, charts: false, methodNotes: true, rest: true },
-  { slices: SLICES_WHEN_SHORT, charts: false, methodNotes: false, rest: true },
-  { slices: 0, charts: false, methodNotes: false, rest: false }
-];
-function droppedBy(review, d, hasCharts) {
-  const n = review.slices.length;
-  return [
-    d.slices === 0 && n > 0 ? "all slices" : "",
-    d.slices > 0 && d.slices < SLICES_SHOWN && n > d.slices ? `slices beyond the worst ${d.slices}` : "",
-    !d.charts && hasCharts ? "charts" : "",
-    d.methodNotes ? "" : "method notes",
-    d.rest ? "" : "curve evidence, hyperparameter changes and provenance"
-  ].filter((x2) => x2 !== "");
-}
-function renderMarkdown(review, options = {}) {
-  const limit = options.maxLength ?? GITHUB_COMMENT_LIMIT;
-  const target = options.maxLength === void 0 ? DEFAULT_TARGET_LENGTH : limit;
-  const marker = buildMarker({ key: options.commentKey ?? "default", head: options.headSha ?? "" });
-  const files = options.provenance?.files ?? [];
-  const charts = buildCharts(review);
-  for (const detail of STAGES) {
-    const body = compose(review, { marker, files, charts }, detail);
-    if (body.length <= target) return body;
-  }
-  const minimal = [
-    marker,
-    ...headlineBlock(review),
-    `_Shortened to fit the size limit: left out the tables, levers, charts and details. The JSON report has every number._`,
-    "",
-    `_${CAUTION}_`,
-    ""
-  ].join("\n");
-  if (minimal.length <= target) return minimal;
-  const stub = `${marker}
-## fitgap review
-
-Too large for this space: see the JSON report.
-`;
-  return stub.length <= target ? stub : stub.slice(0, Math.max(0, target));
-}
-function table(t) {
-  return markdownTable([t.header, ...t.rows], { align: t.align, alignDelimiters: false });
-}
-function details(summary2, body) {
-  return ["<details>", `<summary>${summary2}</summary>`, "", ...body, "", "</details>", ""];
-}
-function headlineBlock(review) {
-  const h = buildHeadline(review, escapeInline);
-  return [
-    `## fitgap review: ${h.title}`,
-    "",
-    ...h.lines.map((l) => `- **${l.label}**: ${l.text}`),
-    ""
-  ];
-}
-function compose(review, { marker, files, charts }, d) {
-  const out = [marker, ...headlineBlock(review)];
-  out.push("### Splits", "", table(splitsTable(review)), "");
-  out.push("### Error decomposition", "", table(decompositionTable(review)), "");
-  const missing = unavailableNotes(review, escapeInline);
-  if (missing.length > 0) out.push(...missing.map((m) => `- ${m}`), "");
-  if (review.levers.length > 0) {
-    out.push("### Next levers", "", table(leversTable(review, escapeInline)), "");
-  }
-  if (d.charts) {
-    if (charts.length > 0) {
-      out.push("### Charts", "");
-      for (const chart2 of charts) {
-        out.push(chart2.caption, "", "```mermaid", chart2.code, "```", "");
-      }
-    }
-  }
-  if (review.slices.length > 0 && d.slices > 0) {
-    const c = sliceCounts(review.slices);
-    const shown = Math.min(d.slices, review.slices.length);
-    const rest = review.slices.length - shown;
-    const body = [table(slicesTable(review, escapeInline, d.slices))];
-    if (rest > 0) {
-      body.push(
-        "",
-        `${count(rest)} more ${rest === 1 ? "slice is" : "slices are"} not shown; the JSON report has all ${count(review.slices.length)}.`
-      );
-    }
-    out.push(
-      ...details(
-        `Slices: ${count(c.worse)} worse, ${count(c.better)} better, ${count(c.flat)} unchanged (worst first)`,
-        body
-      )
-    );
-  }
-  if (d.rest) {
-    const evidence = curveEvidence(review, escapeInline);
-    if (evidence.length > 0)
-      out.push(
-        ...details(
-          "Curve evidence",
-          evidence.map((e) => `- ${e}`)
-        )
-      );
-    if (review.hyperparameters.length > 0) {
-      const body = [table(hyperparameterTable(review, escapeInline))];
-      const rest = review.hyperparameters.length - MAX_HYPERPARAMETER_ROWS;
-      if (rest > 0) body.push("", `${count(rest)} more changes are not shown.`);
-      out.push(
-        ...details(`Hyperparameter changes (${count(review.hyperparameters.length)})`, body)
-      );
-    }
-  }
-  if (d.methodNotes) {
-    out.push(
-      ...details(
-        "Method notes",
-        methodNotes(review, escapeInline).map((n) => `- ${n}`)
-      )
-    );
-  }
-  if (d.rest) {
-    const tables = provenanceTables(review, escapeInline, files);
-    out.push(
-      ...details(
-        "Provenance",
-        tables.flatMap((t) => [table(t), ""])
-      )
-    );
-  }
-  const dropped = droppedBy(review, d, charts.length > 0);
-  if (dropped.length > 0) {
-    out.push(
-      `_Shortened to fit the size limit: left out ${dropped.join("; ")}. The JSON report has every number._`,
-      ""
-    );
-  }
-  out.push(`_${CAUTION}_`, "");
-  return out.join("\n");
-}
-
-// src/entries/action/bundle.ts
-var import_ajv = __toESM(require_ajv(), 1);
+// src/io/bundle.ts
 var REVIEW_FILE = "review.json";
 var PULL_REQUEST_FILE = "pull-request.json";
-var ajv = new import_ajv.Ajv({ allErrors: true });
+var RUN_FILE = "run.json";
+var PREDICTIONS_FILE = "predictions.csv";
+var SIDES = ["baseline", "candidate"];
 var pullRequestSchema = {
   type: "object",
   additionalProperties: false,
@@ -47078,489 +46544,99 @@ var pullRequestSchema = {
   properties: {
     format: { type: "string", const: "fitgap-pull-request/1" },
     repository: { type: "string", pattern: "^[A-Za-z0-9_.-]{1,100}/[A-Za-z0-9_.-]{1,100}$" },
-    number: { type: "integer", minimum: 1 },
+    number: { type: "integer", minimum: 1, maximum: 2147483647 },
     headSha: { type: "string", pattern: "^[0-9a-f]{40}$" }
   }
 };
-var enumOf = (values) => ({ type: "string", enum: values });
-var delta = {
-  type: "object",
-  required: ["estimate", "test", "call"],
-  properties: { estimate: { type: "number" }, call: enumOf(["up", "down", "flat"]) }
-};
-var reviewSchema = {
-  type: "object",
-  required: [
-    "format",
-    "movement",
-    "validation",
-    "slices",
-    "settings",
-    "candidate",
-    "baseline",
-    "gate",
-    "metric"
-  ],
-  properties: {
-    format: { const: "fitgap-review/1" },
-    movement: enumOf([
-      "better-on-both",
-      "away-from-underfitting",
-      "toward-overfitting",
-      "away-from-overfitting",
-      "no-significant-change",
-      "toward-underfitting",
-      "worse-on-both"
-    ]),
-    validation: {
-      type: "object",
-      required: ["change", "delta"],
-      properties: { change: enumOf(["better", "worse", "flat"]), delta }
-    },
-    slices: {
-      type: "array",
-      items: {
-        type: "object",
-        required: ["change"],
-        properties: { change: enumOf(["better", "worse", "flat"]) }
-      }
-    },
-    settings: { type: "object" },
-    candidate: {
-      type: "object",
-      required: ["diagnosis", "components"],
-      properties: {
-        components: {
-          type: "object",
-          required: ["overfit"],
-          properties: {
-            overfit: {
-              type: "object",
-              required: ["present"],
-              properties: { present: { type: "boolean" } }
-            }
-          }
-        },
-        diagnosis: enumOf([
-          "good-fit",
-          "high-bias",
-          "high-variance",
-          "data-mismatch",
-          "high-bias-and-variance"
-        ])
-      }
-    },
-    baseline: { type: "object" },
-    metric: { type: "object", required: ["name", "goal", "kind"] },
-    gate: {
-      type: "object",
-      required: ["pass", "reasons"],
-      properties: {
-        pass: { type: "boolean" },
-        reasons: { type: "array", maxItems: 50, items: { type: "string", maxLength: 1e3 } }
-      }
-    }
-  }
-};
-var validatePullRequest = ajv.compile(pullRequestSchema);
-var validateReview = ajv.compile(reviewSchema);
-function parse(bytes, file) {
-  try {
-    return JSON.parse(new TextDecoder().decode(bytes));
-  } catch (error2) {
-    throw new InputError([
-      { file, pointer: "", expected: "must be JSON", got: error2.message }
-    ]);
-  }
-}
-function issues(file, errors) {
-  return (errors ?? []).map((e) => ({
-    file,
-    pointer: e.instancePath || "/",
-    expected: e.message ?? "is invalid"
-  }));
-}
-function readPullRequestNote(bytes, label) {
-  const file = `${label} ${PULL_REQUEST_FILE}`;
-  const doc = parse(bytes, file);
-  if (!validatePullRequest(doc)) throw new InputError(issues(file, validatePullRequest.errors));
-  return doc;
-}
-function readReview(bytes, label) {
-  const file = `${label} ${REVIEW_FILE}`;
-  const doc = parse(bytes, file);
-  if (!validateReview(doc)) throw new InputError(issues(file, validateReview.errors));
-  return doc;
-}
-
-// src/io/github/check.ts
-var MAX_CHECK_OUTPUT_CHARS = 65535;
-var MAX_STATUS_DESCRIPTION = 140;
-async function publishGate(options) {
-  const { octokit, repo, sha, name, pass } = options;
-  if (options.kind === "commit-status") {
-    const description = pass ? `passed: ${options.title}` : `failed: ${options.reasons.join("; ")}`;
-    const { data: data2 } = await octokit.rest.repos.createCommitStatus({
-      ...repo,
-      sha,
-      state: pass ? "success" : "failure",
-      context: name,
-      description: clip(description, MAX_STATUS_DESCRIPTION),
-      ...options.detailsUrl === void 0 ? {} : { target_url: options.detailsUrl }
-    });
-    return { kind: "commit-status", url: data2.url };
-  }
-  const reasons = pass ? "" : `**Gate failed**
-
-${options.reasons.map((r) => `- ${r}`).join("\n")}
-
-`;
-  const { data } = await octokit.rest.checks.create({
-    ...repo,
-    name,
-    head_sha: sha,
-    status: "completed",
-    conclusion: pass ? "success" : "failure",
-    ...options.detailsUrl === void 0 ? {} : { details_url: options.detailsUrl },
-    output: {
-      title: clip(options.title, 200),
-      summary: clip(reasons + options.summary, MAX_CHECK_OUTPUT_CHARS)
-    }
-  });
-  return { kind: "check-run", url: data.html_url ?? data.url };
-}
-function clip(text2, max2) {
-  if (text2.length <= max2) return text2;
-  const note = max2 > 200 ? "\n\n\u2026cut to fit; the full review is in the job summary." : "\u2026";
-  const room = max2 - note.length;
-  const cut = text2.lastIndexOf("\n", room);
-  return text2.slice(0, cut > room / 2 ? cut : room) + note;
-}
-
-// src/io/github/comment.ts
-var MAX_COMMENT_CHARS = 65536;
-async function publishComment(options) {
-  const { octokit, repo, pullNumber, key } = options;
-  const body = fitBody(withMarker(options.body, key, options.headSha), options);
-  const currentHead = options.currentHead ?? (await octokit.rest.pulls.get({ ...repo, pull_number: pullNumber })).data.head.sha;
-  if (currentHead !== options.headSha) return { action: "stale", currentHead };
-  if (options.mode === "new") {
-    const { data: data2 } = await octokit.rest.issues.createComment({
-      ...repo,
-      issue_number: pullNumber,
-      body
-    });
-    return { action: "created", id: data2.id, url: data2.html_url };
-  }
-  const ours = await listOurComments(options, null);
-  const [target, ...duplicates] = ours;
-  if (target === void 0) {
-    const { data: created } = await octokit.rest.issues.createComment({
-      ...repo,
-      issue_number: pullNumber,
-      body
-    });
-    return dedupeAfterCreate(options, body, created);
-  }
-  await deleteComments(options, duplicates);
-  if (target.body === body) return { action: "unchanged", id: target.id, url: target.html_url };
-  const { data } = await octokit.rest.issues.updateComment({
-    ...repo,
-    comment_id: target.id,
-    body
-  });
-  return { action: "updated", id: data.id, url: data.html_url };
-}
-async function dedupeAfterCreate(options, body, created) {
-  const ours = await listOurComments(options, created.user?.login ?? null);
-  const [oldest, ...later] = ours;
-  if (oldest === void 0 || oldest.id === created.id) {
-    await deleteComments(options, later);
-    return { action: "created", id: created.id, url: created.html_url };
-  }
-  await deleteComments(options, later);
-  if (oldest.body === body) return { action: "unchanged", id: oldest.id, url: oldest.html_url };
-  const { data } = await options.octokit.rest.issues.updateComment({
-    ...options.repo,
-    comment_id: oldest.id,
-    body
-  });
-  return { action: "updated", id: data.id, url: data.html_url };
-}
-async function listOurComments(options, login) {
-  const ours = [];
-  const pages = options.octokit.paginate.iterator(options.octokit.rest.issues.listComments, {
-    ...options.repo,
-    issue_number: options.pullNumber,
-    per_page: 100
-  });
-  for await (const page of pages) {
-    for (const comment of page.data) {
-      if (isOurs(comment, options.key, login)) ours.push(comment);
-    }
-  }
-  return ours.sort((a, b) => a.created_at.localeCompare(b.created_at) || a.id - b.id);
-}
-function isOurs(comment, key, login = null) {
-  if (comment.user?.type !== "Bot") return false;
-  if (login !== null && comment.user.login !== login) return false;
-  return parseMarker(comment.body ?? "")?.key === key;
-}
-async function deleteComments(options, comments) {
-  for (const comment of comments) {
-    await options.octokit.rest.issues.deleteComment({ ...options.repo, comment_id: comment.id });
-  }
-}
-function withMarker(body, key, headSha) {
-  return parseMarker(body)?.key === key ? body : `${buildMarker({ key, head: headSha })}
-${body}`;
-}
-function fitBody(body, options) {
-  if (body.length <= MAX_COMMENT_CHARS) return body;
-  const where = options.runUrl === void 0 ? "the job summary" : `the [job summary](${options.runUrl})`;
-  return `${buildMarker({ key: options.key, head: options.headSha })}
-fitgap's review is ${body.length} characters long, more than a comment can hold (${MAX_COMMENT_CHARS}). Read it in ${where}.
-`;
-}
-
-// src/entries/action/publish-steps.ts
-function setReviewOutputs(io, review, reportPath, reportDir) {
-  io.setOutput("movement", review.movement);
-  io.setOutput("validation-change", review.validation.change);
-  io.setOutput("candidate-diagnosis", review.candidate.diagnosis);
-  io.setOutput("gate", review.gate.pass ? "pass" : "fail");
-  io.setOutput("report-path", reportPath);
-  io.setOutput("report-dir", reportDir);
-}
-function runUrl(context3) {
-  return `${context3.serverUrl}/${context3.repo.owner}/${context3.repo.repo}/actions/runs/${context3.runId}`;
-}
-async function commentStep(deps, target, body) {
-  const { settings, context: context3, octokit, io } = deps;
-  if (settings.comment === "off") return null;
-  try {
-    const outcome = await publishComment({
-      octokit,
-      repo: context3.repo,
-      pullNumber: target.pullNumber,
-      headSha: target.headSha,
-      key: settings.commentKey,
-      body,
-      mode: settings.comment,
-      runUrl: runUrl(context3),
-      ...target.currentHead === void 0 ? {} : { currentHead: target.currentHead }
-    });
-    if (outcome.action === "stale") {
-      io.info(
-        `Not commenting: this review is for ${target.headSha}, but PR #${target.pullNumber} has moved on to ${outcome.currentHead}; the run for that commit reports it.`
-      );
-      return null;
-    }
-    io.info(`Comment ${outcome.action}: ${outcome.url}`);
-    io.setOutput("comment-url", outcome.url);
-    return null;
-  } catch (error2) {
-    if (isRequestError(error2) && error2.status === 403) {
-      const text2 = `fitgap could not comment on PR #${target.pullNumber} (${describeRequestError(error2)}). Fork PRs get a read-only token: use the two-workflow pattern (examples/fork-safe-*.yml), or grant "pull-requests: write". The review is in this job summary.`;
-      io.warning(text2);
-      await io.appendSummary(`
-> [!WARNING]
-> ${text2}
-`);
-      return null;
-    }
-    if (isRequestError(error2))
-      return `Could not publish the comment: ${describeRequestError(error2)}`;
-    throw error2;
-  }
-}
-async function gateCheckStep(deps, kind, sha, review, body) {
-  const { settings, context: context3, octokit, io } = deps;
-  const name = settings.commentKey === "default" ? "fitgap" : `fitgap (${settings.commentKey})`;
-  try {
-    const outcome = await publishGate({
-      octokit,
-      repo: context3.repo,
-      sha,
-      kind,
-      name,
-      pass: review.gate.pass,
-      title: `${review.movement}; validation ${review.validation.change}`,
-      summary: body,
-      reasons: review.gate.reasons,
-      detailsUrl: runUrl(context3)
-    });
-    io.info(
-      `Gate published as a ${outcome.kind} on ${sha}: ${review.gate.pass ? "pass" : "fail"}.`
+var validatePullRequest = new import_ajv.Ajv({ allErrors: true, strictNumbers: true }).compile(
+  pullRequestSchema
+);
+function parsePullRequestNote(text2, file) {
+  const doc = parseJson(text2, file);
+  if (!validatePullRequest(doc)) {
+    throw new InputError(
+      (validatePullRequest.errors ?? []).map((e) => ({
+        file,
+        pointer: e.instancePath || "/",
+        expected: e.message ?? "is invalid",
+        hint: 'The note is written by fitgap in review mode; upload its "report-dir" unchanged.'
+      }))
     );
-    return null;
-  } catch (error2) {
-    if (isRequestError(error2))
-      return `Could not publish the gate ${kind}: ${describeRequestError(error2)}`;
-    throw error2;
   }
+  return doc;
 }
-
-// src/entries/action/report-files.ts
-import { mkdir as mkdir2, writeFile as writeFile2 } from "node:fs/promises";
-import { join } from "node:path";
-
-// src/report/json.ts
-function renderJson(review) {
-  assertFinite(review, "");
-  return `${JSON.stringify(review, null, 2)}
-`;
-}
-function assertFinite(value, pointer) {
-  if (typeof value === "number") {
-    if (!Number.isFinite(value)) {
-      throw new RangeError(
-        `fitgap-review/1 ${pointer || "/"} is ${String(value)}; the review model must hold finite numbers only (this is a bug)`
-      );
-    }
-    return;
-  }
-  if (Array.isArray(value)) {
-    value.forEach((item, i2) => assertFinite(item, `${pointer}/${i2}`));
-    return;
-  }
-  if (value !== null && typeof value === "object") {
-    for (const [key, item] of Object.entries(value)) {
-      assertFinite(item, `${pointer}/${key.replace(/~/g, "~0").replace(/\//g, "~1")}`);
-    }
-  }
-}
-
-// src/entries/action/report-files.ts
-function reviewJson(review) {
-  return renderJson(review);
-}
-async function writeReportFiles(dir, review, note) {
+async function writeBundle(dir, runs, note) {
   await mkdir2(dir, { recursive: true });
-  const path = join(dir, REVIEW_FILE);
-  await writeFile2(path, reviewJson(review));
-  if (note !== null)
-    await writeFile2(join(dir, PULL_REQUEST_FILE), `${JSON.stringify(note, null, 2)}
+  await writeFile2(join(dir, PULL_REQUEST_FILE), `${JSON.stringify(note, null, 2)}
 `);
-  return { dir, path };
+  for (const side of SIDES) {
+    const run = runs[side];
+    const folder = join(dir, side);
+    await mkdir2(folder, { recursive: true });
+    const artifact = run.artifact.predictions === void 0 ? run.artifact : { ...run.artifact, predictions: { ...run.artifact.predictions, path: PREDICTIONS_FILE } };
+    await writeFile2(join(folder, RUN_FILE), `${JSON.stringify(artifact, null, 2)}
+`);
+    if (run.predictions !== null)
+      await pipeline(
+        await run.predictions.open(),
+        createWriteStream(join(folder, PREDICTIONS_FILE))
+      );
+  }
 }
-
-// src/entries/action/publish-mode.ts
-import { join as join2 } from "node:path";
-function refuse2(issue2) {
-  throw new InputError([{ pointer: "", ...issue2 }]);
-}
-async function runPublish(deps) {
-  const { settings, context: context3, octokit, io } = deps;
-  const run = context3.workflowRun;
-  if (run === null || context3.eventName !== "workflow_run") {
-    refuse2({
-      file: 'input "mode"',
-      expected: 'may be "publish" only in a workflow triggered by workflow_run',
-      got: JSON.stringify(context3.eventName)
+async function extractBundle(options) {
+  const { zip, label } = options;
+  const entries = listEntries(zip, label).filter((e) => !e.directory);
+  const wanted = [
+    PULL_REQUEST_FILE,
+    ...SIDES.flatMap((side) => [`${side}/${RUN_FILE}`, `${side}/${PREDICTIONS_FILE}`])
+  ];
+  for (const name of [PULL_REQUEST_FILE, ...SIDES.map((side) => `${side}/${RUN_FILE}`)]) {
+    if (entries.filter((e) => e.name === name).length !== 1) {
+      throw new InputError([
+        {
+          file: label,
+          pointer: "",
+          expected: `must hold ${name} exactly once`,
+          got: entries.some((e) => e.name === name) ? "more than one" : "none",
+          hint: 'Upload the "report-dir" output of the review step (fitgap 0.2 or later) unchanged.'
+        }
+      ]);
+    }
+  }
+  await mkdir2(options.tempDir, { recursive: true });
+  const folder = await mkdtemp(join(options.tempDir, "bundle-"));
+  const budget = { remaining: options.limitBytes, limit: options.limitBytes };
+  for (const entry of entries) {
+    if (!wanted.includes(entry.name)) continue;
+    const bytes2 = readEntry(zip, entry, budget, label);
+    const [side, base] = entry.name.includes("/") ? entry.name.split("/") : [null, entry.name];
+    if (side !== null) await mkdir2(join(folder, side), { recursive: true });
+    await writeFile2(join(folder, ...side === null ? [] : [side], base ?? ""), bytes2, {
+      flag: "wx"
     });
   }
-  const files = await downloadBundle(deps, run);
-  const label = `artifact "${settings.reportArtifact}" (run ${run.id})`;
-  const note = readPullRequestNote(files.note, label);
-  const untrusted = readReview(files.review, label);
-  const failOn = settings.failOn ?? untrusted.settings.failOn;
-  const review = { ...untrusted, settings: { ...untrusted.settings, failOn } };
-  review.gate = applyGate(review);
-  const fullName2 = `${context3.repo.owner}/${context3.repo.repo}`;
-  if (note.repository !== fullName2 || note.headSha !== run.headSha) {
-    refuse2({
-      file: `${label} ${PULL_REQUEST_FILE}`,
-      expected: `must name this repository (${fullName2}) and the run's head commit (${run.headSha})`,
-      got: `${note.repository} at ${note.headSha}`
-    });
-  }
-  const { data: pull } = await octokit.rest.pulls.get({
-    ...context3.repo,
-    pull_number: note.number
+  const noteFile = `${label} ${PULL_REQUEST_FILE}`;
+  const { bytes } = await readChecked({
+    path: join(folder, PULL_REQUEST_FILE),
+    file: noteFile,
+    what: "a pull-request note (JSON)",
+    limit: "artifactBytes",
+    limits: options.limits
   });
-  const pullHeadRepo = pull.head.repo?.full_name ?? null;
-  if (pullHeadRepo !== run.headRepo) {
-    refuse2({
-      file: `${label} ${PULL_REQUEST_FILE}`,
-      expected: `must name a PR whose head is in ${run.headRepo ?? "the run head repository"}`,
-      got: `PR #${note.number} from ${pullHeadRepo ?? "a deleted repository"}`
-    });
-  }
-  let body;
-  try {
-    body = renderMarkdown(review, { commentKey: settings.commentKey, headSha: run.headSha });
-  } catch (error2) {
-    refuse2({
-      file: `${label} ${REVIEW_FILE}`,
-      expected: "must be a complete fitgap-review/1 report",
-      got: String(error2)
-    });
-  }
-  await io.appendSummary(body);
-  const written = await writeReportFiles(
-    join2(settings.tempDir, `fitgap-${settings.commentKey}`, "report"),
-    review,
-    note
-  );
-  setReviewOutputs(io, review, written.path, written.dir);
-  const problems = [];
-  const comment = await commentStep(
-    deps,
-    { pullNumber: note.number, headSha: run.headSha, currentHead: pull.head.sha },
-    body
-  );
-  if (comment !== null) problems.push(comment);
-  const kind = settings.statusCheck === "auto" ? "check-run" : settings.statusCheck;
-  if (kind !== "off") {
-    const problem = await gateCheckStep(deps, kind, run.headSha, review, body);
-    if (problem !== null) problems.push(problem);
-  }
-  if (!review.gate.pass)
-    io.info(`Gate failed (published on ${run.headSha}): ${review.gate.reasons.join("; ")}`);
-  if (problems.length > 0) io.setFailed(problems.join("\n"));
-}
-async function downloadBundle(deps, run) {
-  const { settings, context: context3, octokit } = deps;
-  const name = settings.reportArtifact;
-  const { data } = await octokit.rest.actions.listWorkflowRunArtifacts({
-    ...context3.repo,
-    run_id: run.id,
-    name,
-    per_page: 100
-  });
-  const artifact = data.artifacts.find((a) => a.name === name && !a.expired);
-  if (artifact === void 0) {
-    refuse2({
-      file: 'input "report-artifact"',
-      expected: `must name an artifact of the triggering run ${run.id} (conclusion ${run.conclusion ?? "unknown"})`,
-      got: JSON.stringify(name),
-      hint: 'Upload the "report-dir" output of the review step under this name, also when the gate fails (if: always()).'
-    });
-  }
-  const zip = await downloadArtifact({
-    octokit,
-    repo: context3.repo,
-    artifact: { id: artifact.id, name, sizeInBytes: artifact.size_in_bytes, runId: run.id },
-    limitBytes: settings.archiveLimitBytes
-  });
-  const label = `artifact "${name}" (run ${run.id})`;
-  const entries = listEntries(zip, label);
-  const budget = { remaining: settings.archiveLimitBytes, limit: settings.archiveLimitBytes };
-  const read = (file) => {
-    const entry = entries.find((e) => e.name === file);
-    if (entry === void 0) refuse2({ file: label, expected: `must hold ${file} at its root` });
-    return readEntry(zip, entry, budget, label);
+  const note = parsePullRequestNote(decodeUtf8(bytes, noteFile, "a pull-request note"), noteFile);
+  return {
+    note,
+    runs: {
+      baseline: join(folder, "baseline", RUN_FILE),
+      candidate: join(folder, "candidate", RUN_FILE)
+    },
+    folder
   };
-  return { note: read(PULL_REQUEST_FILE), review: read(REVIEW_FILE) };
 }
-
-// src/entries/action/review-mode.ts
-import { basename as basename2, isAbsolute, join as join5, relative as relative2, resolve as resolve4 } from "node:path";
 
 // src/io/review-from-files.ts
 import { createHash as createHash2 } from "node:crypto";
-import { dirname as dirname2, join as join3, resolve as resolve2 } from "node:path";
+import { resolve as resolve3 } from "node:path";
 
 // src/model/run.ts
 var SPLIT_NAMES = ["train", "train_dev", "validation", "test"];
@@ -47583,7 +46659,7 @@ function assertCount(name, value) {
     throw new RangeError(`${name} must be a non-negative integer count; got ${value}`);
   }
 }
-function assertFinite2(name, value) {
+function assertFinite(name, value) {
   if (!Number.isFinite(value))
     throw new RangeError(`${name} must be a finite number; got ${value}`);
 }
@@ -47688,11 +46764,11 @@ var RunningStats = class {
   #m2 = 0;
   /** Add one value; RangeError for NaN or ±Infinity (one would poison every later result). */
   push(x2) {
-    assertFinite2("RunningStats value", x2);
+    assertFinite("RunningStats value", x2);
     this.#n += 1;
-    const delta2 = x2 - this.#mean;
-    this.#mean += delta2 / this.#n;
-    this.#m2 += delta2 * (x2 - this.#mean);
+    const delta = x2 - this.#mean;
+    this.#mean += delta / this.#n;
+    this.#m2 += delta * (x2 - this.#mean);
   }
   get n() {
     return this.#n;
@@ -47707,7 +46783,7 @@ var RunningStats = class {
 
 // src/stats/t-tests.ts
 function tInference(estimate, se2, df, alpha) {
-  assertFinite2("estimate", estimate);
+  assertFinite("estimate", estimate);
   if (!Number.isFinite(se2)) {
     throw new RangeError(`standard error is not finite (${se2}); values too large to combine`);
   }
@@ -47741,7 +46817,7 @@ function pairedT(diffs, alpha) {
   if (!Number.isSafeInteger(n) || n < 2) {
     throw new RangeError(`pairedT needs at least 2 paired differences; got n = ${n}`);
   }
-  assertFinite2("pairedT mean", m);
+  assertFinite("pairedT mean", m);
   if (!(variance >= 0) || !Number.isFinite(variance)) {
     throw new RangeError(`pairedT variance must be a finite number >= 0; got ${variance}`);
   }
@@ -47767,7 +46843,7 @@ function checkGroup(name, values) {
 // src/stats/proportions.ts
 function normalTest(estimate, variance, alpha, test = "z-binomial") {
   assertAlpha(alpha);
-  assertFinite2("normalTest estimate", estimate);
+  assertFinite("normalTest estimate", estimate);
   if (!(variance >= 0) || !Number.isFinite(variance)) {
     throw new RangeError(`normalTest variance must be a finite number >= 0; got ${variance}`);
   }
@@ -48204,8 +47280,8 @@ function fitLeastSquares(problem) {
       break;
     }
     for (; ; ) {
-      const delta2 = dampedStep(jac, state.r, free, d, mu);
-      const trial = clamp(p.map((v, j) => v + (delta2[j] ?? 0)));
+      const delta = dampedStep(jac, state.r, free, d, mu);
+      const trial = clamp(p.map((v, j) => v + (delta[j] ?? 0)));
       const step = trial.map((v, j) => v - p[j]);
       const predicted = predictedReduction(jac, state.r, step, state.rss);
       const trialState = evaluate(trial);
@@ -48288,9 +47364,9 @@ function dampedStep(jac, r, free, d, mu) {
   free.forEach((_, k) => rows.push(free.map((__, c) => c === k ? sq : 0)));
   const rhs = [...r, ...free.map(() => 0)];
   const z = qrLeastSquares(rows, rhs).x;
-  const delta2 = new Array(d.length).fill(0);
-  if (z) free.forEach((j, k) => delta2[j] = z[k] / scale[k]);
-  return delta2;
+  const delta = new Array(d.length).fill(0);
+  if (z) free.forEach((j, k) => delta[j] = z[k] / scale[k]);
+  return delta;
 }
 function predictedReduction(jac, r, step, rss) {
   let linear = 0;
@@ -48844,6 +47920,33 @@ function formatNumber(value) {
 function formatP(p) {
   if (p === null) return "n/a";
   return p < 1e-3 ? "< 0.001" : p.toFixed(3);
+}
+
+// src/analysis/gate.ts
+var RULES = {
+  "worse-validation": (r) => r.validation.change === "worse" ? "validation got significantly worse" : null,
+  "toward-overfitting": (r) => r.movement === "toward-overfitting" ? "the change moved toward overfitting" : null,
+  "toward-underfitting": (r) => r.movement === "toward-underfitting" ? "the change moved toward underfitting" : null,
+  "worse-on-both": (r) => r.movement === "worse-on-both" ? "bias and variance both got worse" : null,
+  "any-movement": (r) => r.movement !== "no-significant-change" ? `the model moved (${r.movement})` : null,
+  "slice-regression": (r) => {
+    const worse = r.slices.filter((s) => s.change === "worse");
+    return worse.length > 0 ? `${worse.length} slice(s) regressed significantly` : null;
+  },
+  "high-bias": (r) => r.candidate.diagnosis === "high-bias" || r.candidate.diagnosis === "high-bias-and-variance" ? "the candidate has high bias" : null,
+  "high-variance": (r) => r.candidate.diagnosis === "high-variance" || r.candidate.diagnosis === "high-bias-and-variance" ? "the candidate has high variance" : null,
+  "data-mismatch": (r) => r.candidate.diagnosis === "data-mismatch" ? "the candidate shows data mismatch" : null,
+  "validation-overfit": (r) => r.candidate.components.overfit.present ? "the candidate overfits the validation set (test error well above validation)" : null,
+  none: () => null
+};
+function applyGate(review) {
+  const failOn = review.settings.failOn;
+  const reasons = [];
+  for (const policy of failOn) {
+    const reason = RULES[policy]?.(review) ?? null;
+    if (reason !== null) reasons.push(`${policy}: ${reason}`);
+  }
+  return { pass: reasons.length === 0, reasons, failOn: [...failOn] };
 }
 
 // src/analysis/hyperparameters.ts
@@ -49441,8 +48544,100 @@ function buildReview(input) {
 
 // src/io/load-run.ts
 import { createHash } from "node:crypto";
-import { readFile, stat as stat2 } from "node:fs/promises";
-import { dirname, relative, resolve, sep } from "node:path";
+import { lstat as lstat2 } from "node:fs/promises";
+import { dirname as dirname2, relative as relative2, resolve as resolve2, sep } from "node:path";
+
+// src/model/settings.ts
+var FAIL_ON_VALUES = [
+  "worse-validation",
+  "toward-overfitting",
+  "toward-underfitting",
+  "worse-on-both",
+  "any-movement",
+  "slice-regression",
+  "high-bias",
+  "high-variance",
+  "data-mismatch",
+  "validation-overfit",
+  "none"
+];
+function isFailOn(value) {
+  return FAIL_ON_VALUES.includes(value);
+}
+var DEFAULT_SETTINGS = {
+  alpha: 0.05,
+  minEffect: 0,
+  gapTolerance: 0.1,
+  failOn: ["worse-validation"]
+};
+var NUMBER_SETTINGS = {
+  alpha: { min: 1e-6, max: 0.5, about: "significance level" },
+  "min-effect": { min: 0, max: MAX_MAGNITUDE, about: "smallest change that counts" },
+  "gap-tolerance": { min: 0, max: 1, about: "component present at this fraction of the error" },
+  reference: { min: -MAX_MAGNITUDE, max: MAX_MAGNITUDE, about: "reference level" }
+};
+var DECIMAL = /^[+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:[eE][+-]?\d+)?$/;
+function parseDecimal(text2) {
+  const trimmed = text2.trim();
+  if (!DECIMAL.test(trimmed)) return null;
+  const value = Number(trimmed);
+  return Number.isFinite(value) ? value : null;
+}
+function rangeText(name) {
+  const { min, max: max2 } = NUMBER_SETTINGS[name];
+  return `must be a number from ${formatLimit(min)} to ${formatLimit(max2)}`;
+}
+function numberSettingIssues(name, value, source) {
+  const { min, max: max2 } = NUMBER_SETTINGS[name];
+  if (Number.isFinite(value) && value >= min && value <= max2) return [];
+  return [{ ...source, expected: rangeText(name), got: quote(value) }];
+}
+function parseNumberSetting(name, text2, source) {
+  const value = parseDecimal(text2);
+  if (value === null)
+    return { issues: [{ ...source, expected: rangeText(name), got: quote(text2) }] };
+  const issues = numberSettingIssues(name, value, source);
+  return issues.length > 0 ? { issues } : { value };
+}
+var FAIL_ON_SEPARATORS = /[,\n]/;
+function failOnIssues(values, source) {
+  const at = (i2) => source.pointer === "" ? "" : `${source.pointer}/${i2}`;
+  if (values.length === 0) {
+    return [
+      {
+        ...source,
+        expected: "must name at least one outcome",
+        got: "an empty list",
+        hint: "Write 'none' for a gate that never fails, or leave the setting out for the default (worse-validation)."
+      }
+    ];
+  }
+  const issues = values.flatMap(
+    (value, i2) => isFailOn(value) ? [] : [
+      {
+        ...source,
+        pointer: at(i2),
+        expected: `must be one of ${FAIL_ON_VALUES.join(", ")}`,
+        got: quote(value),
+        hint: "Separate outcomes with commas or new lines."
+      }
+    ]
+  );
+  if (issues.length === 0 && values.length > 1 && values.includes("none")) {
+    issues.push({
+      ...source,
+      pointer: at(values.indexOf("none")),
+      expected: "must not combine 'none' with other outcomes",
+      got: quote(values.join(","))
+    });
+  }
+  return issues;
+}
+function parseFailOn(text2, source) {
+  const values = text2.split(FAIL_ON_SEPARATORS).map((s) => s.trim()).filter((s) => s !== "");
+  const issues = failOnIssues(values, source);
+  return issues.length > 0 ? { issues } : { value: values };
+}
 
 // src/artifact/epoch-log.ts
 function splitCsvLine(line) {
@@ -49451,6 +48646,22 @@ function splitCsvLine(line) {
 function parseEpochLog(text2, file, mapping) {
   const lines = text2.replace(/^\uFEFF/, "").split(/\r?\n/);
   const header = splitCsvLine(lines[0] ?? "");
+  const seen = /* @__PURE__ */ new Map();
+  header.forEach((name, i2) => {
+    const first = seen.get(name);
+    if (first !== void 0) {
+      throw new InputError([
+        {
+          file,
+          pointer: "line 1",
+          expected: `must name each column once (column ${i2 + 1} repeats column ${first + 1})`,
+          got: quote(name),
+          hint: "Rename one of the columns; a repeated name makes the mapping ambiguous."
+        }
+      ]);
+    }
+    seen.set(name, i2);
+  });
   const column = (name, role) => {
     if (name === void 0) return void 0;
     const index = header.indexOf(name);
@@ -49471,21 +48682,22 @@ function parseEpochLog(text2, file, mapping) {
   const ti = column(mapping.train, "train");
   const vi = column(mapping.validation, "validation") ?? 0;
   const points = [];
-  const issues2 = [];
+  const issues = [];
   for (let i2 = 1; i2 < lines.length; i2++) {
     const raw = lines[i2] ?? "";
     if (raw.trim() === "") continue;
     const cells = splitCsvLine(raw);
     const read = (index, name) => {
       const cell = cells[index] ?? "";
-      const value = cell === "" ? Number.NaN : Number(cell);
-      if (!Number.isFinite(value)) {
-        issues2.push({
+      const value = parseDecimal(cell) ?? Number.NaN;
+      if (!Number.isFinite(value) || Math.abs(value) > MAX_MAGNITUDE) {
+        issues.push({
           file,
           pointer: `line ${i2 + 1}`,
-          expected: `column "${name}" must be a finite number`,
+          expected: `column "${name}" must be a decimal number within \xB1${formatLimit(MAX_MAGNITUDE)}`,
           got: quote(cell)
         });
+        return Number.NaN;
       }
       return value;
     };
@@ -49493,7 +48705,7 @@ function parseEpochLog(text2, file, mapping) {
     if (ti !== void 0 && mapping.train !== void 0) point.train = read(ti, mapping.train);
     const previous = points[points.length - 1];
     if (previous !== void 0 && Number.isFinite(point.x) && !(point.x > previous.x)) {
-      issues2.push({
+      issues.push({
         file,
         pointer: `line ${i2 + 1}`,
         expected: `column "${mapping.x}" must strictly increase (previous ${previous.x})`,
@@ -49501,54 +48713,21 @@ function parseEpochLog(text2, file, mapping) {
       });
     }
     points.push(point);
-    if (issues2.length >= 10) break;
+    if (issues.length >= 10) break;
+    if (points.length > MAX_CURVE_POINTS) {
+      issues.push({
+        file,
+        pointer: `line ${i2 + 1}`,
+        expected: `must have at most ${MAX_CURVE_POINTS} data rows (a curve's limit)`,
+        hint: "Log less often, or keep every n-th row."
+      });
+      break;
+    }
   }
-  if (issues2.length > 0) throw new InputError(issues2);
+  if (issues.length > 0) throw new InputError(issues);
   if (points.length === 0)
     throw new InputError([{ file, pointer: "", expected: "has no data rows under its header" }]);
   return points;
-}
-
-// src/artifact/read-json.ts
-function lineAndColumn(text2, offset) {
-  let line = 1;
-  let last = -1;
-  for (let i2 = 0; i2 < offset && i2 < text2.length; i2++) {
-    if (text2.charCodeAt(i2) === 10) {
-      line++;
-      last = i2;
-    }
-  }
-  return { line, column: offset - last };
-}
-function errorOffset(text2, message) {
-  const position = /position (\d+)/.exec(message);
-  if (position?.[1] !== void 0) return Number(position[1]);
-  if (/Unexpected end of JSON input/.test(message)) return text2.length;
-  const context3 = /Unexpected token '(.)', (?:\.\.\.)?"([\s\S]*?)"(?:\.\.\.)? is not valid JSON/.exec(message);
-  if (context3?.[1] !== void 0 && context3[2] !== void 0) {
-    const at = text2.indexOf(context3[2]);
-    if (at >= 0) return at + Math.max(0, context3[2].indexOf(context3[1]));
-  }
-  return null;
-}
-function parseJson(text2, file) {
-  try {
-    return JSON.parse(text2.charCodeAt(0) === 65279 ? text2.slice(1) : text2);
-  } catch (error2) {
-    const message = error2 instanceof Error ? error2.message : String(error2);
-    const offset = errorOffset(text2, message);
-    const where = offset === null ? void 0 : lineAndColumn(text2, offset);
-    throw new InputError([
-      {
-        file,
-        pointer: where === void 0 ? "" : `line ${where.line}, column ${where.column}`,
-        expected: "is not valid JSON",
-        got: (message.split(",")[0] ?? message).replace(/ in JSON at position \d+.*$/, "").slice(0, 80),
-        hint: "Fix the syntax (a missing comma or quote is the usual cause); `fitgap validate FILE` re-checks it."
-      }
-    ]);
-  }
 }
 
 // src/validate/run.ts
@@ -49773,128 +48952,24 @@ var fitgap_run_1_schema_default = {
   }
 };
 
-// src/validate/ajv-issues.ts
-function valueAt(doc, pointer) {
-  if (pointer === "") return doc;
-  let node = doc;
-  for (const raw of pointer.slice(1).split("/")) {
-    const key = raw.replace(/~1/g, "/").replace(/~0/g, "~");
-    if (node === null || typeof node !== "object") return void 0;
-    node = node[key];
-  }
-  return node;
-}
-function escapePointerToken(token) {
-  return token.replace(/~/g, "~0").replace(/\//g, "~1");
-}
-function typeName(value) {
-  if (value === null) return "null";
-  if (Array.isArray(value)) return "an array";
-  if (typeof value === "object") return "an object";
-  return `${typeof value} ${quote(value)}`;
-}
-function oneIssue(error2, file, doc) {
-  const pointer = error2.instancePath;
-  const value = valueAt(doc, pointer);
-  const params = error2.params;
-  switch (error2.keyword) {
-    case "required":
-      return {
-        file,
-        pointer: pointer === "" ? "/" : pointer,
-        expected: `must have the key "${String(params["missingProperty"])}"`,
-        hint: "Add it; see schema/fitgap-run-1.schema.json for the format."
-      };
-    case "additionalProperties": {
-      const key = String(params["additionalProperty"]);
-      return {
-        file,
-        pointer: `${pointer}/${escapePointerToken(key)}`,
-        expected: "is not a known key",
-        hint: "Check the spelling; unknown keys are rejected so that a typo cannot pass silently."
-      };
-    }
-    case "type":
-      return {
-        file,
-        pointer,
-        expected: `must be ${String(params["type"]) === "integer" ? "an integer" : `of type ${String(params["type"])}`}`,
-        got: typeName(value),
-        ...params["type"] === "number" && typeof value === "string" ? { hint: "Write numbers without quotes." } : {}
-      };
-    case "enum":
-      return {
-        file,
-        pointer,
-        expected: `must be one of ${params["allowedValues"].map((v) => quote(v)).join(", ")}`,
-        got: quote(value)
-      };
-    case "const":
-      return {
-        file,
-        pointer,
-        expected: `must be ${quote(params["allowedValue"])}`,
-        got: quote(value)
-      };
-    case "format":
-      return {
-        file,
-        pointer,
-        expected: `must be a ${String(params["format"])} string`,
-        got: quote(value),
-        ...params["format"] === "date-time" ? { hint: 'Use RFC 3339, e.g. "2026-11-30T10:00:00Z".' } : {}
-      };
-    default:
-      return {
-        file,
-        pointer,
-        expected: error2.message ?? `fails ${error2.keyword}`,
-        got: quote(value)
-      };
-  }
-}
-function ajvIssues(errors, file, doc) {
-  const seen = /* @__PURE__ */ new Set();
-  const issues2 = [];
-  for (const error2 of errors) {
-    const issue2 = oneIssue(error2, file, doc);
-    const key = `${issue2.pointer}|${issue2.expected}`;
-    if (seen.has(key)) continue;
-    seen.add(key);
-    issues2.push(issue2);
-  }
-  return issues2;
-}
-function nonFiniteNumbers(doc, pointer = "") {
-  if (typeof doc === "number") return Number.isFinite(doc) ? [] : [pointer];
-  if (Array.isArray(doc))
-    return doc.flatMap((item, i2) => nonFiniteNumbers(item, `${pointer}/${i2}`));
-  if (doc !== null && typeof doc === "object") {
-    return Object.entries(doc).flatMap(
-      ([k, v]) => nonFiniteNumbers(v, `${pointer}/${escapePointerToken(k)}`)
-    );
-  }
-  return [];
-}
-
 // src/validate/run.ts
 var formatsModule = import_ajv_formats.default;
 var addFormats = typeof formatsModule === "function" ? formatsModule : formatsModule.default;
 var compiled;
 function validator() {
   if (compiled === void 0) {
-    const ajv2 = new import__.Ajv2020({ allErrors: true, strict: true, strictNumbers: true });
-    addFormats(ajv2, ["date-time"]);
-    compiled = ajv2.compile(fitgap_run_1_schema_default);
+    const ajv = new import__.Ajv2020({ allErrors: true, strict: true, strictNumbers: true });
+    addFormats(ajv, ["date-time"]);
+    compiled = ajv.compile(fitgap_run_1_schema_default);
   }
   return compiled;
 }
 function semanticIssues(run, file) {
-  const issues2 = [];
+  const issues = [];
   const proportion = run.metric.kind === "proportion";
   const inUnit = (value, pointer) => {
     if (proportion && (value < 0 || value > 1)) {
-      issues2.push({
+      issues.push({
         file,
         pointer,
         expected: "must be within [0, 1] for a proportion metric",
@@ -49909,7 +48984,7 @@ function semanticIssues(run, file) {
     if (split === void 0) continue;
     split.values.forEach((v, i2) => inUnit(v, `/splits/${name}/values/${i2}`));
     if (split.values.length !== repeats) {
-      issues2.push({
+      issues.push({
         file,
         pointer: `/splits/${name}/values`,
         expected: `must have one value per repeat, as many as /splits/train/values (${repeats})`,
@@ -49922,12 +48997,22 @@ function semanticIssues(run, file) {
   for (const name of CURVE_NAMES) {
     const curve = run.curves?.[name];
     if (curve === void 0) continue;
+    if (curve.length > MAX_CURVE_POINTS) {
+      issues.push({
+        file,
+        pointer: `/curves/${name}`,
+        expected: `must have at most ${MAX_CURVE_POINTS} points`,
+        got: `${curve.length} points`,
+        hint: "Log the curve less often, or keep every n-th point before writing the artifact."
+      });
+      continue;
+    }
     curve.forEach((point, i2) => {
       const at = `/curves/${name}/${i2}`;
       inUnit(point.validation, `${at}/validation`);
       if (point.train !== void 0) inUnit(point.train, `${at}/train`);
       if (name === "regularization" && point.x <= 0) {
-        issues2.push({
+        issues.push({
           file,
           pointer: `${at}/x`,
           expected: "must be > 0 (the regularization curve is read on a log axis)",
@@ -49936,7 +49021,7 @@ function semanticIssues(run, file) {
         });
       }
       if (name === "training_examples" && point.x <= 0) {
-        issues2.push({
+        issues.push({
           file,
           pointer: `${at}/x`,
           expected: "must be > 0 (a count of training examples)",
@@ -49945,7 +49030,7 @@ function semanticIssues(run, file) {
       }
       const previous = curve[i2 - 1];
       if (previous !== void 0 && !(point.x > previous.x)) {
-        issues2.push({
+        issues.push({
           file,
           pointer: `${at}/x`,
           expected: `must be greater than the previous point's x (${previous.x}); curve x must strictly increase`,
@@ -49963,7 +49048,7 @@ function semanticIssues(run, file) {
   run.slices?.forEach((slice, i2) => {
     const first = names.get(slice.name);
     if (first !== void 0) {
-      issues2.push({
+      issues.push({
         file,
         pointer: `/slices/${i2}/name`,
         expected: `must be unique (also at /slices/${first}/name)`,
@@ -49974,7 +49059,7 @@ function semanticIssues(run, file) {
   if (run.predictions !== void 0) {
     const p = run.predictions.path;
     if (p.startsWith("/") || /^[A-Za-z]:[\\/]/.test(p) || p.split(/[\\/]/).includes("..")) {
-      issues2.push({
+      issues.push({
         file,
         pointer: "/predictions/path",
         expected: "must be a relative path inside the artifact's folder",
@@ -49983,62 +49068,78 @@ function semanticIssues(run, file) {
       });
     }
   }
-  return issues2;
+  return issues;
 }
 function validateRun(doc, file) {
-  const nonFinite = nonFiniteNumbers(doc);
-  if (nonFinite.length > 0) {
+  const numbers = outOfRangeNumbers(doc, MAX_MAGNITUDE);
+  if (numbers.length > 0) {
     throw new InputError(
-      nonFinite.map((pointer) => ({
-        file,
-        pointer,
-        expected: "must be a finite number",
-        got: "a number too large to represent (Infinity)",
-        hint: "Write the measured value; JSON numbers such as 1e999 overflow."
-      }))
+      numbers.map(
+        ({ pointer, value }) => Number.isFinite(value) ? {
+          file,
+          pointer,
+          expected: `must be within \xB1${formatLimit(MAX_MAGNITUDE)}`,
+          got: quote(value),
+          hint: pointer.startsWith("/hyperparameters/") ? "Write large identifiers (seeds, hashes) as strings." : "Rescale the metric (thousands instead of units); larger values overflow in the statistics."
+        } : {
+          file,
+          pointer,
+          expected: "must be a finite number",
+          got: "a number too large to represent (Infinity)",
+          hint: "Write the measured value; JSON numbers such as 1e999 overflow."
+        }
+      )
     );
   }
   const validate = validator();
   if (!validate(doc)) {
     throw new InputError(ajvIssues(validate.errors ?? [], file, doc));
   }
-  const issues2 = semanticIssues(doc, file);
-  if (issues2.length > 0) throw new InputError(issues2);
+  const issues = semanticIssues(doc, file);
+  if (issues.length > 0) throw new InputError(issues);
   return doc;
 }
 
 // src/io/load-run.ts
-async function readText(path, file, what) {
-  try {
-    return await readFile(path);
-  } catch (error2) {
-    const code = error2.code;
-    throw new InputError([
-      {
-        file,
-        pointer: "",
-        expected: `could not be read as ${what}`,
-        got: code === "ENOENT" ? "no such file" : code === "EISDIR" ? "a directory" : code ?? String(error2),
-        hint: "Check the path."
-      }
-    ]);
-  }
-}
 function besideArtifact(artifactPath, name) {
-  const folder = resolve(dirname(artifactPath));
-  const target = resolve(folder, name);
-  const rel = relative(folder, target);
-  if (rel === "" || rel.startsWith("..") || rel.includes(`..${sep}`) || resolve(folder, rel) !== target)
+  const folder = resolve2(dirname2(artifactPath));
+  const target = resolve2(folder, name);
+  const rel = relative2(folder, target);
+  if (rel === "" || rel.startsWith("..") || rel.includes(`..${sep}`) || resolve2(folder, rel) !== target)
     return null;
   return target;
 }
+function besideName(file, name) {
+  return `${dirname2(file) === "." ? "" : `${dirname2(file)}/`}${name}`;
+}
+function predictionsSource(target, track) {
+  return {
+    file: target.file,
+    open: async () => {
+      const { stream } = await streamChecked(target);
+      track?.(stream);
+      return stream;
+    }
+  };
+}
 async function loadRun(path, options = {}) {
   const file = options.displayName ?? path;
-  const bytes = await readText(path, file, "a run artifact (JSON)");
+  const limits = options.limits ?? DEFAULT_FILE_LIMITS;
+  const folder = dirname2(resolve2(path));
+  const { bytes, file: checked } = await readChecked({
+    path,
+    file,
+    what: "a run artifact (JSON)",
+    limit: "artifactBytes",
+    limits
+  });
+  const read = [{ realPath: checked.realPath, id: checked.id }];
   const sha256 = createHash("sha256").update(bytes).digest("hex");
-  const artifact = validateRun(parseJson(bytes.toString("utf8"), file), file);
+  const text2 = decodeUtf8(bytes, file, "a run artifact");
+  const artifact = validateRun(parseJson(text2, file), file);
   const notes = [];
   let predictionsPath = null;
+  let predictions = null;
   if (artifact.predictions !== void 0) {
     predictionsPath = besideArtifact(path, artifact.predictions.path);
     const issue2 = {
@@ -50049,29 +49150,51 @@ async function loadRun(path, options = {}) {
       hint: 'Put the predictions CSV next to the artifact, or remove "predictions".'
     };
     if (predictionsPath === null) throw new InputError([issue2]);
-    const info2 = await stat2(predictionsPath).catch(() => null);
-    if (info2 === null || !info2.isFile())
-      throw new InputError([
-        { ...issue2, expected: "must name an existing file next to the artifact" }
-      ]);
+    const target = {
+      path: predictionsPath,
+      file: besideName(file, artifact.predictions.path),
+      what: "a predictions CSV",
+      folder,
+      limit: "csvBytes",
+      limits
+    };
+    const first = await openChecked(target).catch((error2) => {
+      if (error2 instanceof MissingFileError)
+        throw new InputError([
+          { ...issue2, expected: "must name an existing file next to the artifact" }
+        ]);
+      throw error2;
+    });
+    await first.handle.close();
+    read.push({ realPath: first.realPath, id: first.id });
+    predictions = predictionsSource(target, options.track);
   }
   if (options.epochLog !== void 0) {
     const logPath = besideArtifact(path, options.epochLog.file);
-    const logName = `${dirname(file) === "." ? "" : `${dirname(file)}/`}${options.epochLog.file}`;
-    const info2 = logPath === null ? null : await stat2(logPath).catch(() => null);
-    if (logPath !== null && info2?.isFile() === true) {
+    const logName = besideName(file, options.epochLog.file);
+    const present = logPath !== null && await lstat2(logPath).catch(() => null) !== null;
+    if (logPath !== null && present) {
       if (artifact.curves?.epochs !== void 0) {
         notes.push(
           `${file}: the artifact has its own curves.epochs; the epoch log ${logName} was not used.`
         );
       } else {
-        const text2 = (await readText(logPath, logName, "an epoch log (CSV)")).toString("utf8");
+        const log = await readChecked({
+          path: logPath,
+          file: logName,
+          what: "an epoch log (CSV)",
+          folder,
+          limit: "artifactBytes",
+          limits
+        });
+        read.push({ realPath: log.file.realPath, id: log.file.id });
+        const logText = decodeUtf8(log.bytes, logName, "an epoch log");
         artifact.curves = {
           ...artifact.curves,
-          epochs: parseEpochLog(text2, logName, options.epochLog)
+          epochs: parseEpochLog(logText, logName, options.epochLog)
         };
-        const issues2 = semanticIssues(artifact, `${file} (with ${logName})`);
-        if (issues2.length > 0) throw new InputError(issues2);
+        const issues = semanticIssues(artifact, `${file} (with ${logName})`);
+        if (issues.length > 0) throw new InputError(issues);
       }
     } else {
       notes.push(
@@ -50079,11 +49202,10 @@ async function loadRun(path, options = {}) {
       );
     }
   }
-  return { artifact, file, sha256, predictionsPath, notes };
+  return { artifact, file, sha256, predictionsPath, predictions, notes, read };
 }
 
 // src/artifact/predictions.ts
-import { createReadStream } from "node:fs";
 import { createInterface } from "node:readline";
 var HEADER = { proportion: "id,correct", continuous: "id,loss" };
 function hashId(id) {
@@ -50118,23 +49240,27 @@ var HashLog = class {
 };
 function parseValue(raw, kind, file, line) {
   const column = kind === "proportion" ? "correct" : "loss";
-  const value = raw.trim() === "" ? Number.NaN : Number(raw);
-  if (kind === "proportion" ? value !== 0 && value !== 1 : !Number.isFinite(value)) {
+  const text2 = raw.trim();
+  const value = kind === "proportion" ? text2 === "0" || text2 === "1" ? Number(text2) : Number.NaN : parseDecimal(text2) ?? Number.NaN;
+  if (!Number.isFinite(value) || Math.abs(value) > MAX_MAGNITUDE) {
     throw new InputError([
       {
         file,
         pointer: `line ${line}`,
-        expected: kind === "proportion" ? `column "${column}" must be 1 or 0` : `column "${column}" must be a finite number`,
+        expected: kind === "proportion" ? `column "${column}" must be 1 or 0` : `column "${column}" must be a decimal number within \xB11e15`,
         got: quote(raw)
       }
     ]);
   }
   return value;
 }
-async function* readRows(path, file, kind, hashes) {
-  const stream = createReadStream(path, { encoding: "utf8" });
+async function* readRows(source, kind, hashes) {
+  const file = source.file;
+  const stream = await source.open();
+  stream.setEncoding("utf8");
   const lines = createInterface({ input: stream, crlfDelay: Infinity });
   let line = 0;
+  let rows = 0;
   try {
     for await (const text2 of lines) {
       line++;
@@ -50170,6 +49296,7 @@ async function* readRows(path, file, kind, hashes) {
           { file, pointer: `line ${line}`, expected: "must have a non-empty id" }
         ]);
       hashes?.push(hashId(id));
+      rows++;
       yield { id, value: parseValue(text2.slice(comma + 1), kind, file, line), line };
     }
   } finally {
@@ -50185,29 +49312,49 @@ async function* readRows(path, file, kind, hashes) {
       }
     ]);
   }
+  if (rows === 0) {
+    throw new InputError([
+      {
+        file,
+        pointer: "",
+        expected: "must have one row per example under its header",
+        got: "no rows"
+      }
+    ]);
+  }
 }
-async function duplicateIssues(path, file, kind, suspects) {
+async function duplicateIssues(source, kind, suspects) {
+  const file = source.file;
   const firstLine = /* @__PURE__ */ new Map();
-  const issues2 = [];
-  for await (const row of readRows(path, file, kind)) {
+  const issues = [];
+  for await (const row of readRows(source, kind)) {
     if (!suspects.has(hashId(row.id))) continue;
     const first = firstLine.get(row.id);
     if (first === void 0) firstLine.set(row.id, row.line);
     else
-      issues2.push({
+      issues.push({
         file,
         pointer: `line ${row.line}`,
         expected: `must have a unique id (also on line ${first})`,
         got: quote(row.id)
       });
   }
-  return issues2;
+  return issues;
+}
+async function checkPredictions(source, kind) {
+  const hashes = new HashLog();
+  for await (const row of readRows(source, kind, hashes)) void row;
+  const repeated = hashes.repeated();
+  if (repeated.size > 0) {
+    const issues = await duplicateIssues(source, kind, repeated);
+    if (issues.length > 0) throw new InputError(issues);
+  }
 }
 async function pairPredictions(baseline, candidate, kind) {
   const baseHashes = new HashLog();
   const candHashes = new HashLog();
-  const base = readRows(baseline.path, baseline.file, kind, baseHashes);
-  const cand = readRows(candidate.path, candidate.file, kind, candHashes);
+  const base = readRows(baseline, kind, baseHashes);
+  const cand = readRows(candidate, kind, candHashes);
   const waitingBase = /* @__PURE__ */ new Map();
   const waitingCand = /* @__PURE__ */ new Map();
   let rows = 0;
@@ -50245,14 +49392,12 @@ async function pairPredictions(baseline, candidate, kind) {
     if (!a.done) a = await base.next();
     if (!b.done) b = await cand.next();
   }
-  const issues2 = [];
+  const issues = [];
   const baseRepeated = baseHashes.repeated();
-  if (baseRepeated.size > 0)
-    issues2.push(...await duplicateIssues(baseline.path, baseline.file, kind, baseRepeated));
+  if (baseRepeated.size > 0) issues.push(...await duplicateIssues(baseline, kind, baseRepeated));
   const candRepeated = candHashes.repeated();
-  if (candRepeated.size > 0)
-    issues2.push(...await duplicateIssues(candidate.path, candidate.file, kind, candRepeated));
-  if (issues2.length > 0) throw new InputError(issues2);
+  if (candRepeated.size > 0) issues.push(...await duplicateIssues(candidate, kind, candRepeated));
+  if (issues.length > 0) throw new InputError(issues);
   const unmatched = { baseline: waitingBase.size, candidate: waitingCand.size };
   if (kind === "proportion") return { kind, rows, baselineOnly, candidateOnly, unmatched };
   return {
@@ -50267,7 +49412,6 @@ async function pairPredictions(baseline, candidate, kind) {
 // src/io/load-config.ts
 var import__2 = __toESM(require__(), 1);
 var import_yaml = __toESM(require_dist2(), 1);
-import { readFile as readFile2 } from "node:fs/promises";
 
 // schema/fitgap-config.schema.json
 var fitgap_config_schema_default = {
@@ -50279,29 +49423,56 @@ var fitgap_config_schema_default = {
   properties: {
     alpha: {
       type: "number",
-      exclusiveMinimum: 0,
-      exclusiveMaximum: 0.5,
-      description: "Significance level; default 0.05."
+      minimum: 1e-6,
+      maximum: 0.5,
+      description: "Significance level of every test, from 0.000001 to 0.5; default 0.05."
     },
     "min-effect": {
       type: "number",
       minimum: 0,
-      description: "Smallest change, in metric units, that counts; default 0."
+      maximum: 1e15,
+      description: "Smallest change, in metric units, that counts; from 0 to 1e15; default 0."
     },
     "gap-tolerance": {
       type: "number",
       minimum: 0,
       maximum: 1,
-      description: "A component counts as present at this fraction of the validation error level; default 0.10."
+      description: "A component counts as present at this fraction of the validation error level, from 0 to 1; default 0.10."
     },
     reference: {
       type: "number",
-      description: "Reference level (human-level, prior system, Bayes error) overriding the artifacts'."
+      minimum: -1e15,
+      maximum: 1e15,
+      description: "Reference level (human-level, prior system, Bayes error) overriding the artifacts'; within [0, 1] for a proportion metric."
     },
     "fail-on": {
-      type: "array",
-      items: { type: "string" },
-      description: "Outcomes that fail the gate; see README 'Gate'."
+      description: "Outcomes that fail the gate: a list, or one text with the outcomes separated by commas or new lines. 'none' never fails and stands alone; an empty list is refused.",
+      oneOf: [
+        {
+          type: "string",
+          minLength: 1
+        },
+        {
+          type: "array",
+          minItems: 1,
+          items: {
+            type: "string",
+            enum: [
+              "worse-validation",
+              "toward-overfitting",
+              "toward-underfitting",
+              "worse-on-both",
+              "any-movement",
+              "slice-regression",
+              "high-bias",
+              "high-variance",
+              "data-mismatch",
+              "validation-overfit",
+              "none"
+            ]
+          }
+        }
+      ]
     },
     "epoch-log": {
       type: "object",
@@ -50314,7 +49485,11 @@ var fitgap_config_schema_default = {
           minLength: 1,
           description: "CSV file name, relative to each artifact's folder."
         },
-        x: { type: "string", minLength: 1, description: "Column holding the epoch." },
+        x: {
+          type: "string",
+          minLength: 1,
+          description: "Column holding the epoch."
+        },
         train: {
           type: "string",
           minLength: 1,
@@ -50326,69 +49501,157 @@ var fitgap_config_schema_default = {
           description: "Column holding the validation metric."
         }
       }
+    },
+    limits: {
+      type: "object",
+      additionalProperties: false,
+      description: "Byte limits of the input files, in MB (see SECURITY.md). The config file's own limit is set by --max-config-mb or the action input max-config-mb.",
+      properties: {
+        "artifact-mb": {
+          type: "number",
+          minimum: 1e-3,
+          maximum: 1024,
+          description: "Largest run artifact or epoch log; default 16."
+        },
+        "csv-mb": {
+          type: "number",
+          minimum: 1e-3,
+          maximum: 65536,
+          description: "Largest predictions CSV; default 512."
+        }
+      }
     }
   }
-};
-
-// src/model/settings.ts
-var FAIL_ON_VALUES = [
-  "worse-validation",
-  "toward-overfitting",
-  "toward-underfitting",
-  "worse-on-both",
-  "any-movement",
-  "slice-regression",
-  "high-bias",
-  "high-variance",
-  "data-mismatch",
-  "validation-overfit",
-  "none"
-];
-function isFailOn(value) {
-  return FAIL_ON_VALUES.includes(value);
-}
-var DEFAULT_SETTINGS = {
-  alpha: 0.05,
-  minEffect: 0,
-  gapTolerance: 0.1,
-  failOn: ["worse-validation"]
 };
 
 // src/io/load-config.ts
 var compiled2;
 function validator2() {
-  compiled2 ??= new import__2.Ajv2020({ allErrors: true, strict: true }).compile(fitgap_config_schema_default);
+  compiled2 ??= new import__2.Ajv2020({
+    allErrors: true,
+    strict: true,
+    strictNumbers: true
+  }).compile(fitgap_config_schema_default);
   return compiled2;
 }
-function failOnIssues(values, file, pointer) {
-  return values.flatMap(
-    (value, i2) => isFailOn(value) ? [] : [
-      {
-        file,
-        pointer: pointer === "" ? "" : `${pointer}/${i2}`,
-        expected: `must be one of ${FAIL_ON_VALUES.join(", ")}`,
-        got: quote(value)
+var MAX_FLOW_DEPTH = 16;
+var MAX_BLOCK_PREFIX = 64;
+var MAX_ALIASES = 100;
+function yamlNestingProblem(text2) {
+  const lines = text2.split("\n");
+  let depth = 0;
+  for (let n = 0; n < lines.length; n++) {
+    const line = lines[n] ?? "";
+    const prefix = /^[\s-]*/.exec(line)?.[0].length ?? 0;
+    if (prefix > MAX_BLOCK_PREFIX)
+      return {
+        line: n + 1,
+        what: `indentation or "- " nesting over ${MAX_BLOCK_PREFIX} characters`
+      };
+    let quoteChar = "";
+    for (let i2 = 0; i2 < line.length; i2++) {
+      const c = line[i2];
+      if (quoteChar !== "") {
+        if (c === quoteChar) quoteChar = "";
+        continue;
       }
-    ]
-  );
+      if (c === '"' || c === "'") quoteChar = c;
+      else if (c === "#" && (i2 === 0 || /\s/.test(line[i2 - 1] ?? ""))) break;
+      else if (c === "[" || c === "{") {
+        depth++;
+        if (depth > MAX_FLOW_DEPTH)
+          return { line: n + 1, what: `brackets nested more than ${MAX_FLOW_DEPTH} deep` };
+      } else if (c === "]" || c === "}") depth = Math.max(0, depth - 1);
+    }
+  }
+  return null;
+}
+function lineOf(text2, offset) {
+  let line = 1;
+  for (let i2 = 0; i2 < offset && i2 < text2.length; i2++) if (text2.charCodeAt(i2) === 10) line++;
+  return line;
 }
 function parseConfig(text2, file) {
-  const document = (0, import_yaml.parseDocument)(text2, { prettyErrors: true });
+  return checkSettings(parseRaw(text2, file), file);
+}
+var NUMBER_KEYS = ["alpha", "min-effect", "gap-tolerance", "reference"];
+var SETTING_KEYS = /* @__PURE__ */ new Set([...NUMBER_KEYS, "fail-on"]);
+function checkSettings(data, file) {
+  const { "fail-on": failOn, ...rest } = data;
+  const issues = [];
+  for (const key of NUMBER_KEYS) {
+    const value = rest[key];
+    if (value === void 0) continue;
+    const source2 = { file, pointer: `/${key}` };
+    if (typeof value !== "number") {
+      issues.push({ ...source2, expected: "must be a number", got: quote(value) });
+    } else issues.push(...numberSettingIssues(key, value, source2));
+  }
+  if (issues.length > 0) throw new InputError(issues);
+  if (failOn === void 0) return rest;
+  const source = { file, pointer: "/fail-on" };
+  if (typeof failOn === "string") {
+    const parsed = parseFailOn(failOn, source);
+    if ("issues" in parsed) throw new InputError(parsed.issues);
+    return { ...rest, "fail-on": parsed.value };
+  }
+  if (!Array.isArray(failOn) || failOn.some((v) => typeof v !== "string")) {
+    throw new InputError([
+      {
+        ...source,
+        expected: "must be a list of outcomes, or one text with outcomes separated by commas",
+        got: quote(failOn)
+      }
+    ]);
+  }
+  const failOnProblems = failOnIssues(failOn, source);
+  if (failOnProblems.length > 0) throw new InputError(failOnProblems);
+  return { ...rest, "fail-on": failOn };
+}
+function parseRaw(text2, file) {
+  const nesting = yamlNestingProblem(text2);
+  if (nesting !== null) {
+    throw new InputError([
+      {
+        file,
+        pointer: `line ${nesting.line}`,
+        expected: "must not nest deeper than a config needs",
+        got: nesting.what
+      }
+    ]);
+  }
+  const document = (0, import_yaml.parseDocument)(text2, { prettyErrors: false, uniqueKeys: true });
   if (document.errors.length > 0) {
     throw new InputError(
       document.errors.slice(0, 10).map((error2) => ({
         file,
-        pointer: error2.linePos?.[0] ? `line ${error2.linePos[0].line}` : "",
+        pointer: `line ${lineOf(text2, error2.pos[0])}`,
         expected: "is not valid YAML",
-        got: quote(error2.message.split("\n")[0] ?? "")
+        got: quote(
+          /call stack/i.test(error2.message) ? "nesting too deep" : error2.message.split("\n")[0] ?? ""
+        )
       }))
     );
   }
-  const data = document.toJS() ?? {};
+  let data;
+  try {
+    data = document.toJS({ maxAliasCount: MAX_ALIASES }) ?? {};
+  } catch (error2) {
+    throw new InputError([
+      {
+        file,
+        pointer: "",
+        expected: `must not expand aliases more than ${MAX_ALIASES} times`,
+        got: quote(error2 instanceof Error ? error2.message.split("\n")[0] : String(error2)),
+        hint: "Write the values out; a config needs no anchors (&) or aliases (*)."
+      }
+    ]);
+  }
   const validate = validator2();
-  if (!validate(data)) {
+  const rest = data !== null && typeof data === "object" && !Array.isArray(data) ? Object.fromEntries(Object.entries(data).filter(([key]) => !SETTING_KEYS.has(key))) : data;
+  if (!validate(rest)) {
     throw new InputError(
-      ajvIssues(validate.errors ?? [], file, data).map((issue2) => ({
+      ajvIssues(validate.errors ?? [], file, rest).map((issue2) => ({
         ...issue2,
         hint: issue2.hint?.replace(
           "schema/fitgap-run-1.schema.json",
@@ -50397,31 +49660,58 @@ function parseConfig(text2, file) {
       }))
     );
   }
-  const issues2 = failOnIssues(data["fail-on"] ?? [], file, "/fail-on");
-  if (issues2.length > 0) throw new InputError(issues2);
   return data;
 }
-async function loadConfig(path, file, required2) {
-  let text2;
+async function loadConfig(path, file, required2, limits) {
+  let read;
   try {
-    text2 = await readFile2(path, "utf8");
+    read = await readChecked({
+      path,
+      file,
+      what: "a config file (YAML)",
+      limit: "configBytes",
+      limits
+    });
   } catch (error2) {
-    const code = error2.code;
-    if (!required2 && code === "ENOENT") return null;
-    throw new InputError([
-      {
-        file,
-        pointer: "",
-        expected: "could not be read",
-        got: code ?? String(error2),
-        hint: "Check the --config path."
-      }
-    ]);
+    if (!(error2 instanceof MissingFileError)) throw error2;
+    if (!required2) return null;
+    throw new InputError(
+      error2.issues.map((i2) => ({ ...i2, hint: "Check the config path." }))
+    );
   }
-  return { config: parseConfig(text2, file), text: text2 };
+  const text2 = decodeUtf8(read.bytes, file, "a config file");
+  return {
+    config: parseConfig(text2, file),
+    text: text2,
+    checked: { realPath: read.file.realPath, id: read.file.id }
+  };
 }
 
 // src/io/review-from-files.ts
+var MB2 = 1024 * 1024;
+function resolveLimits(config, given = {}) {
+  const fromConfig = {};
+  const artifactMb = config.limits?.["artifact-mb"];
+  const csvMb = config.limits?.["csv-mb"];
+  if (artifactMb !== void 0) fromConfig.artifactBytes = Math.round(artifactMb * MB2);
+  if (csvMb !== void 0) fromConfig.csvBytes = Math.round(csvMb * MB2);
+  return { ...DEFAULT_FILE_LIMITS, ...fromConfig, ...given };
+}
+function referenceIssues(config, options, configFile, kind) {
+  if (kind !== "proportion") return [];
+  const fromFlag = options.overrides?.reference;
+  const value = fromFlag ?? config.reference;
+  if (value === void 0 || value >= 0 && value <= 1) return [];
+  return [
+    {
+      file: fromFlag !== void 0 ? options.overrideLabel?.("reference") ?? "--reference" : configFile,
+      pointer: fromFlag !== void 0 ? "" : "/reference",
+      expected: "must be within [0, 1] for a proportion metric",
+      got: quote(value),
+      hint: "Write the reference as a fraction (0.02, not 2)."
+    }
+  ];
+}
 var DEFAULT_CONFIG_PATH = ".github/fitgap.yml";
 function resolveSettings(config, overrides = {}) {
   const reference = overrides.reference ?? config.reference;
@@ -50444,28 +49734,40 @@ function sameMetric(baseline, candidate) {
     hint: "Compare runs of the same metric; a review of different metrics would be meaningless."
   }));
 }
+var MIN_PAIRED_ROWS = 2;
 async function pairIfBoth(baseline, candidate) {
   const bp = baseline.artifact.predictions;
   const cp = candidate.artifact.predictions;
-  if (bp === void 0 || cp === void 0 || baseline.predictionsPath === null || candidate.predictionsPath === null) {
-    return {
-      notes: bp !== cp && (bp === void 0 || cp === void 0) ? ["Only one run ships per-example predictions: no paired test."] : []
-    };
+  const kind = candidate.artifact.metric.kind;
+  const unpaired = async (notes2) => {
+    for (const run of [baseline, candidate])
+      if (run.predictions !== null) await checkPredictions(run.predictions, kind);
+    return { notes: notes2 };
+  };
+  if (baseline.predictions === null || candidate.predictions === null || bp === void 0 || cp === void 0) {
+    return unpaired(
+      bp !== cp && (bp === void 0 || cp === void 0) ? ["Only one run ships per-example predictions: no paired test."] : []
+    );
   }
   if (bp.split !== cp.split) {
-    return {
-      notes: [
-        `The predictions are for different splits (${bp.split} vs ${cp.split}): no paired test.`
-      ]
-    };
+    return unpaired([
+      `The predictions are for different splits (${bp.split} vs ${cp.split}): no paired test.`
+    ]);
   }
-  const result = await pairPredictions(
-    { path: baseline.predictionsPath, file: join3(dirname2(baseline.file), bp.path) },
-    { path: candidate.predictionsPath, file: join3(dirname2(candidate.file), cp.path) },
-    candidate.artifact.metric.kind
-  );
+  const result = await pairPredictions(baseline.predictions, candidate.predictions, kind);
   const notes = [];
   const { unmatched, ...paired } = result;
+  if (result.rows < MIN_PAIRED_ROWS) {
+    throw new InputError([
+      {
+        file: `${baseline.predictions.file} and ${candidate.predictions.file}`,
+        pointer: "",
+        expected: `must share at least ${MIN_PAIRED_ROWS} ids to be paired`,
+        got: `${result.rows} shared (${unmatched.baseline} and ${unmatched.candidate} unmatched rows)`,
+        hint: "Write predictions of the same examples, with the same ids, for both runs."
+      }
+    ]);
+  }
   if (unmatched.baseline + unmatched.candidate > 0) {
     notes.push(
       `Predictions paired by id: ${result.rows} rows in both; ${unmatched.baseline} baseline and ${unmatched.candidate} candidate rows had no partner and were left out of the paired test.`
@@ -50475,59 +49777,1102 @@ async function pairIfBoth(baseline, candidate) {
 }
 async function reviewFiles(options) {
   const cwd = options.cwd ?? ".";
-  const configPath = resolve2(cwd, options.config ?? DEFAULT_CONFIG_PATH);
+  const configPath = resolve3(cwd, options.config ?? DEFAULT_CONFIG_PATH);
+  const configFile = options.names?.config ?? options.config ?? DEFAULT_CONFIG_PATH;
   const loaded = await loadConfig(
     configPath,
-    options.config ?? DEFAULT_CONFIG_PATH,
-    options.config !== void 0
+    configFile,
+    options.config !== void 0,
+    resolveLimits({}, options.limits)
   );
   const config = loaded?.config ?? {};
-  const epochLog = config["epoch-log"];
-  const load = (path) => loadRun(resolve2(cwd, path), {
-    displayName: path,
+  const limits = resolveLimits(config, options.limits);
+  const epochLog = options.epochLogs === false ? void 0 : config["epoch-log"];
+  const streams = [];
+  const load = (path, name) => loadRun(resolve3(cwd, path), {
+    displayName: name ?? path,
+    limits,
+    track: (stream) => streams.push(stream),
     ...epochLog === void 0 ? {} : { epochLog }
   });
-  const [b, c] = await Promise.allSettled([load(options.baseline), load(options.candidate)]);
-  const issues2 = [b, c].flatMap(
-    (r) => r.status === "rejected" ? r.reason instanceof InputError ? r.reason.issues : [] : []
-  );
-  for (const r of [b, c])
-    if (r.status === "rejected" && !(r.reason instanceof InputError)) throw r.reason;
-  if (issues2.length > 0 || b.status === "rejected" || c.status === "rejected")
-    throw new InputError(issues2);
-  const baseline = b.value;
-  const candidate = c.value;
-  const mismatch = sameMetric(baseline, candidate);
-  if (mismatch.length > 0) throw new InputError(mismatch);
-  const { paired, notes } = await pairIfBoth(baseline, candidate);
-  const review = buildReview({
-    baseline: baseline.artifact,
-    candidate: candidate.artifact,
-    settings: resolveSettings(config, options.overrides),
-    ...paired === void 0 ? {} : { paired },
-    notes: [...baseline.notes, ...candidate.notes, ...notes]
-  });
-  return {
-    review,
-    files: {
-      baseline: { path: options.baseline, sha256: baseline.sha256 },
-      candidate: { path: options.candidate, sha256: candidate.sha256 },
-      config: loaded === null ? null : {
-        path: options.config ?? DEFAULT_CONFIG_PATH,
-        sha256: createHash2("sha256").update(loaded.text).digest("hex")
+  try {
+    const [b, c] = await Promise.allSettled([
+      load(options.baseline, options.names?.baseline),
+      load(options.candidate, options.names?.candidate)
+    ]);
+    const issues = [b, c].flatMap(
+      (r) => r.status === "rejected" ? r.reason instanceof InputError ? r.reason.issues : [] : []
+    );
+    for (const r of [b, c])
+      if (r.status === "rejected" && !(r.reason instanceof InputError)) throw r.reason;
+    if (issues.length > 0 || b.status === "rejected" || c.status === "rejected")
+      throw new InputError(issues);
+    const baseline = b.value;
+    const candidate = c.value;
+    const mismatch = sameMetric(baseline, candidate);
+    if (mismatch.length > 0) throw new InputError(mismatch);
+    const reference = referenceIssues(config, options, configFile, candidate.artifact.metric.kind);
+    if (reference.length > 0) throw new InputError(reference);
+    const { paired, notes } = await pairIfBoth(baseline, candidate);
+    const review = buildReview({
+      baseline: baseline.artifact,
+      candidate: candidate.artifact,
+      settings: resolveSettings(config, options.overrides),
+      ...paired === void 0 ? {} : { paired },
+      notes: [...baseline.notes, ...candidate.notes, ...notes]
+    });
+    return {
+      review,
+      files: {
+        baseline: { path: baseline.file, sha256: baseline.sha256 },
+        candidate: { path: candidate.file, sha256: candidate.sha256 },
+        config: loaded === null ? null : {
+          path: configFile,
+          sha256: createHash2("sha256").update(loaded.text).digest("hex")
+        }
+      },
+      runs: { baseline, candidate },
+      read: [...loaded === null ? [] : [loaded.checked], ...baseline.read, ...candidate.read]
+    };
+  } finally {
+    for (const stream of streams) stream.destroy();
+  }
+}
+
+// node_modules/markdown-table/index.js
+function defaultStringLength(value) {
+  return value.length;
+}
+function markdownTable(table2, options) {
+  const settings = options || {};
+  const align = (settings.align || []).concat();
+  const stringLength = settings.stringLength || defaultStringLength;
+  const alignments = [];
+  const cellMatrix = [];
+  const sizeMatrix = [];
+  const longestCellByColumn = [];
+  let mostCellsPerRow = 0;
+  let rowIndex = -1;
+  while (++rowIndex < table2.length) {
+    const row2 = [];
+    const sizes2 = [];
+    let columnIndex2 = -1;
+    if (table2[rowIndex].length > mostCellsPerRow) {
+      mostCellsPerRow = table2[rowIndex].length;
+    }
+    while (++columnIndex2 < table2[rowIndex].length) {
+      const cell = serialize(table2[rowIndex][columnIndex2]);
+      if (settings.alignDelimiters !== false) {
+        const size = stringLength(cell);
+        sizes2[columnIndex2] = size;
+        if (longestCellByColumn[columnIndex2] === void 0 || size > longestCellByColumn[columnIndex2]) {
+          longestCellByColumn[columnIndex2] = size;
+        }
+      }
+      row2.push(cell);
+    }
+    cellMatrix[rowIndex] = row2;
+    sizeMatrix[rowIndex] = sizes2;
+  }
+  let columnIndex = -1;
+  if (typeof align === "object" && "length" in align) {
+    while (++columnIndex < mostCellsPerRow) {
+      alignments[columnIndex] = toAlignment(align[columnIndex]);
+    }
+  } else {
+    const code = toAlignment(align);
+    while (++columnIndex < mostCellsPerRow) {
+      alignments[columnIndex] = code;
+    }
+  }
+  columnIndex = -1;
+  const row = [];
+  const sizes = [];
+  while (++columnIndex < mostCellsPerRow) {
+    const code = alignments[columnIndex];
+    let before = "";
+    let after = "";
+    if (code === 99) {
+      before = ":";
+      after = ":";
+    } else if (code === 108) {
+      before = ":";
+    } else if (code === 114) {
+      after = ":";
+    }
+    let size = settings.alignDelimiters === false ? 1 : Math.max(
+      1,
+      longestCellByColumn[columnIndex] - before.length - after.length
+    );
+    const cell = before + "-".repeat(size) + after;
+    if (settings.alignDelimiters !== false) {
+      size = before.length + size + after.length;
+      if (size > longestCellByColumn[columnIndex]) {
+        longestCellByColumn[columnIndex] = size;
+      }
+      sizes[columnIndex] = size;
+    }
+    row[columnIndex] = cell;
+  }
+  cellMatrix.splice(1, 0, row);
+  sizeMatrix.splice(1, 0, sizes);
+  rowIndex = -1;
+  const lines = [];
+  while (++rowIndex < cellMatrix.length) {
+    const row2 = cellMatrix[rowIndex];
+    const sizes2 = sizeMatrix[rowIndex];
+    const cellsInRow = settings.fillRows === false ? Math.max(1, cellMatrix[rowIndex === 1 ? 0 : rowIndex].length) : mostCellsPerRow;
+    columnIndex = -1;
+    const line = [];
+    while (++columnIndex < cellsInRow) {
+      const cell = row2[columnIndex] || "";
+      let before = "";
+      let after = "";
+      if (settings.alignDelimiters !== false) {
+        const size = longestCellByColumn[columnIndex] - (sizes2[columnIndex] || 0);
+        const code = alignments[columnIndex];
+        if (code === 114) {
+          before = " ".repeat(size);
+        } else if (code === 99) {
+          const half = size / 2;
+          if (size % 2) {
+            before = " ".repeat(half + 0.5);
+            after = " ".repeat(half - 0.5);
+          } else {
+            before = " ".repeat(half);
+            after = before;
+          }
+        } else {
+          after = " ".repeat(size);
+        }
+      }
+      if (settings.delimiterStart !== false && !columnIndex) {
+        line.push("|");
+      }
+      if (settings.padding !== false && // Don’t add the opening space if we’re not aligning and the cell is
+      // empty: there will be a closing space.
+      !(settings.alignDelimiters === false && cell === "") && (settings.delimiterStart !== false || columnIndex)) {
+        line.push(" ");
+      }
+      if (settings.alignDelimiters !== false) {
+        line.push(before);
+      }
+      line.push(cell);
+      if (settings.alignDelimiters !== false) {
+        line.push(after);
+      }
+      if (settings.padding !== false) {
+        line.push(" ");
+      }
+      if (settings.delimiterEnd !== false || columnIndex !== cellsInRow - 1) {
+        line.push("|");
       }
     }
+    lines.push(
+      settings.delimiterEnd === false ? line.join("").replace(/ +$/, "") : line.join("")
+    );
+  }
+  return lines.join("\n");
+}
+function serialize(value) {
+  return value === null || value === void 0 ? "" : String(value);
+}
+function toAlignment(value) {
+  const code = typeof value === "string" ? value.codePointAt(0) : 0;
+  return code === 67 || code === 99 ? 99 : code === 76 || code === 108 ? 108 : code === 82 || code === 114 ? 114 : 0;
+}
+
+// src/report/escape.ts
+var DEFAULT_MAX_NAME = 80;
+var ZWJ = "\u200D";
+var REMOVED = /[\p{Cc}\p{Cf}\p{Cs}]/gu;
+var BREAKS = /[\t\n\v\f\r\u0085\u2028\u2029]/g;
+function plainText(text2, maxChars = DEFAULT_MAX_NAME) {
+  const cleaned = text2.replace(BREAKS, " ").replace(REMOVED, "").replace(/\s+/g, " ").trim();
+  return truncate(cleaned, maxChars);
+}
+function truncate(text2, maxChars) {
+  const points = Array.from(text2);
+  if (points.length <= maxChars) return text2;
+  return `${points.slice(0, Math.max(0, maxChars - 1)).join("").trimEnd()}\u2026`;
+}
+function escapeInline(text2, maxChars = DEFAULT_MAX_NAME) {
+  const plain = plainText(text2, maxChars);
+  let out = "";
+  for (const ch of plain) {
+    out += escapeChar(ch);
+  }
+  return out.replace(/:\/\//g, `:${ZWJ}//`).replace(/\b(www)\./gi, `$1${ZWJ}.`).replace(/\b(GH)-(?=\d)/gi, `$1-${ZWJ}`);
+}
+function escapeChar(ch) {
+  switch (ch) {
+    case "&":
+      return "&amp;";
+    case "<":
+      return "&lt;";
+    case ">":
+      return "&gt;";
+    case "@":
+      return `@${ZWJ}`;
+    case "#":
+      return `\\#${ZWJ}`;
+    default:
+      return MARKDOWN_PUNCTUATION.has(ch) ? `\\${ch}` : ch;
+  }
+}
+var MARKDOWN_PUNCTUATION = /* @__PURE__ */ new Set(["\\", "`", "*", "_", "[", "]", "|", "~", "$"]);
+function mermaidLabel(text2, maxChars = 60) {
+  const kept = plainText(text2, Number.MAX_SAFE_INTEGER).replace(/[^\p{L}\p{N} .,\-+()/=]/gu, " ").replace(/ {2,}/g, " ").trim();
+  return truncate(kept, maxChars);
+}
+function displayValue(value) {
+  if (value === void 0) return "(absent)";
+  if (typeof value === "string") return value;
+  if (typeof value === "number" || typeof value === "boolean" || value === null) {
+    return String(value);
+  }
+  try {
+    return JSON.stringify(value) ?? String(value);
+  } catch {
+    return String(value);
+  }
+}
+
+// src/report/format.ts
+function numberFormatFor(review) {
+  let largest = 0;
+  for (const change of review.splits) {
+    largest = Math.max(largest, Math.abs(change.baseline), Math.abs(change.candidate));
+  }
+  if (largest === 0 || !Number.isFinite(largest)) return { decimals: 4 };
+  const decimals = 3 - Math.floor(Math.log10(largest));
+  return { decimals: Math.min(6, Math.max(0, decimals)) };
+}
+function num(value, format) {
+  const text2 = value.toFixed(format.decimals);
+  return /^-0(\.0+)?$/.test(text2) ? text2.slice(1) : text2;
+}
+function signed(value, format) {
+  const text2 = num(Math.abs(value), format);
+  if (/^0(\.0+)?$/.test(text2)) return text2;
+  return value > 0 ? `+${text2}` : `\u2212${text2}`;
+}
+function interval(ci, format) {
+  if (ci === null) return "n/a";
+  return `[${signed(ci[0], format)}, ${signed(ci[1], format)}]`;
+}
+function pValue(p) {
+  if (p === null) return "p n/a";
+  if (p < 1e-3) return "p < 0.001";
+  return `p = ${p.toFixed(3)}`;
+}
+function count(n) {
+  return Math.round(n).toString().replace(/\B(?=(\d{3})+(?!\d))/g, ",");
+}
+function short(value) {
+  if (value === 0) return "0";
+  const abs = Math.abs(value);
+  if (abs >= 1e6 || abs < 1e-4) return value.toExponential(2);
+  return String(Number(value.toPrecision(4)));
+}
+function chartNumber(value, decimals) {
+  const text2 = value.toFixed(decimals);
+  return /^-0(\.0+)?$/.test(text2) ? text2.slice(1) : text2;
+}
+
+// src/report/words.ts
+var MOVEMENT_TITLE = {
+  "better-on-both": "less bias and less variance",
+  "away-from-underfitting": "away from underfitting",
+  "toward-overfitting": "toward overfitting",
+  "away-from-overfitting": "away from overfitting",
+  "no-significant-change": "no change beyond noise",
+  "toward-underfitting": "toward underfitting",
+  "worse-on-both": "more bias and more variance"
+};
+var MOVEMENT_SENTENCE = {
+  "better-on-both": "The change lowered both avoidable bias and variance",
+  "away-from-underfitting": "The change moved the model away from underfitting",
+  "toward-overfitting": "The change moved the model toward overfitting",
+  "away-from-overfitting": "The change moved the model away from overfitting",
+  "no-significant-change": "The change did not move avoidable bias or variance beyond run-to-run noise",
+  "toward-underfitting": "The change moved the model toward underfitting",
+  "worse-on-both": "The change raised both avoidable bias and variance"
+};
+var VALIDATION_WORD = {
+  better: "better",
+  worse: "worse",
+  flat: "unchanged within noise"
+};
+var DIAGNOSIS_WORD = {
+  "good-fit": "good fit",
+  "high-bias": "high bias (underfitting)",
+  "high-variance": "high variance (overfitting)",
+  "data-mismatch": "data mismatch",
+  "high-bias-and-variance": "high bias and high variance"
+};
+var COMPONENT_WORD = {
+  bias: "Avoidable bias",
+  variance: "Variance",
+  mismatch: "Data mismatch",
+  overfit: "Validation overfit"
+};
+var COMPONENT_ORDER = [
+  "bias",
+  "variance",
+  "mismatch",
+  "overfit"
+];
+var SPLIT_WORD = {
+  train: "train",
+  train_dev: "train-dev",
+  validation: "validation",
+  test: "test"
+};
+var LEVER_TITLE = {
+  "more-data": "Add training data",
+  "fewer-features": "Use fewer features",
+  "stronger-regularization": "Strengthen regularization",
+  "smaller-model": "Use a smaller model",
+  "early-stopping": "Stop training earlier",
+  "more-features": "Add features",
+  "richer-features": "Add polynomial or interaction terms",
+  "weaker-regularization": "Weaken regularization",
+  "bigger-model": "Use a bigger model",
+  "train-longer": "Train longer",
+  "align-training-data": "Make training data look like validation data",
+  "bigger-validation-set": "Use a bigger validation set",
+  "add-repeats": "Repeat each run with several seeds",
+  "supply-reference": "Supply a reference error level"
+};
+var TEST_WORD = {
+  "welch-t": "Welch's t-test",
+  "z-binomial": "binomial z-test",
+  "mcnemar-exact": "McNemar's exact test",
+  "paired-t": "paired t-test",
+  none: "no test"
+};
+var TEST_WHY = {
+  "welch-t": "Welch's t-test on per-repeat values: each run has two or more repeats (seeds), and their spreads may differ.",
+  "z-binomial": "normal approximation with binomial variances: one repeat of a proportion metric measured on a known number of examples.",
+  "mcnemar-exact": "McNemar's exact test: both runs scored the same examples, so only the examples on which they disagree carry information.",
+  "paired-t": "paired t-test on per-example loss differences: both runs scored the same examples with a continuous loss.",
+  none: "no test: with one repeat of a continuous metric and no paired predictions, run-to-run noise is unknown, so only min-effect decides."
+};
+function reading(call, review) {
+  if (call === "flat") return "flat";
+  const up = call === "up";
+  return up === (review.metric.goal === "maximize") ? "better" : "worse";
+}
+function componentReading(call) {
+  if (call === "up") return "up (worse)";
+  if (call === "down") return "down (better)";
+  return "flat";
+}
+function levelPercent(review) {
+  return String(Number(((1 - review.settings.alpha) * 100).toPrecision(4)));
+}
+var CAUTION = "This verdict is advice for a human reviewer, not a proof: it rests on the numbers the two runs recorded and on the tests named in the method notes.";
+
+// src/report/tables.ts
+function splitsTable(review) {
+  const f = numberFormatFor(review);
+  return {
+    header: [
+      "Split",
+      "Baseline",
+      "Candidate",
+      "\u0394",
+      `${levelPercent(review)}% interval`,
+      "p",
+      "Reading"
+    ],
+    align: ["l", "r", "r", "r", "r", "r", "l"],
+    rows: review.splits.map((s) => [
+      SPLIT_WORD[s.split],
+      num(s.baseline, f),
+      num(s.candidate, f),
+      signed(s.delta.estimate, f),
+      interval(s.delta.ci, f),
+      pValue(s.delta.p).replace(/^p /, "").replace(/^= /, ""),
+      reading(s.delta.call, review)
+    ])
+  };
+}
+function decompositionTable(review, compact = false) {
+  const f = numberFormatFor(review);
+  const cell = (run, name) => {
+    const c = review[run].components[name];
+    if (c.value === null) return "n/a";
+    return `${num(c.value, f)}${c.present ? compact ? "*" : " (present)" : ""}`;
+  };
+  const deltas = {
+    bias: review.bias.delta,
+    variance: review.variance.delta,
+    mismatch: review.mismatch.delta,
+    overfit: review.overfit.delta
+  };
+  const rows = COMPONENT_ORDER.map((name) => {
+    const d = deltas[name];
+    return [
+      COMPONENT_WORD[name],
+      cell("baseline", name),
+      cell("candidate", name),
+      d === null ? "n/a" : signed(d.estimate, f),
+      d === null ? "n/a" : interval(d.ci, f),
+      d === null ? "n/a" : pValue(d.p).replace(/^p /, "").replace(/^= /, ""),
+      d === null ? "n/a" : componentReading(d.call)
+    ];
+  });
+  rows.push([
+    "Diagnosis",
+    DIAGNOSIS_WORD[review.baseline.diagnosis],
+    DIAGNOSIS_WORD[review.candidate.diagnosis],
+    "",
+    "",
+    "",
+    ""
+  ]);
+  const table2 = {
+    header: [
+      "Component",
+      "Baseline",
+      "Candidate",
+      "\u0394",
+      `${levelPercent(review)}% interval`,
+      "p",
+      "Call"
+    ],
+    align: ["l", "r", "r", "r", "r", "r", "l"],
+    rows
+  };
+  if (!compact) return table2;
+  const shorter = (row) => [
+    ...row.slice(0, 5),
+    (row[6] ?? "").replace(/^(up|down) \((\w+)\)$/, "$2")
+  ];
+  return {
+    header: shorter(table2.header),
+    align: ["l", "r", "r", "r", "r", "l"],
+    rows: table2.rows.map(shorter)
+  };
+}
+function unavailableNotes(review, esc) {
+  const seen = /* @__PURE__ */ new Set();
+  for (const run of ["baseline", "candidate"]) {
+    for (const name of COMPONENT_ORDER) {
+      const c = review[run].components[name];
+      if (c.value === null && c.unavailable !== void 0) {
+        seen.add(`${COMPONENT_WORD[name]}: ${esc(c.unavailable, 300)}`);
+      }
+    }
+  }
+  return [...seen];
+}
+function leversTable(review, esc) {
+  return {
+    header: ["#", "Lever", "Why", "Evidence"],
+    align: ["r", "l", "l", "l"],
+    rows: review.levers.map((lever, i2) => [
+      String(i2 + 1),
+      LEVER_TITLE[lever.id],
+      esc(lever.reason, 300),
+      lever.evidence.map((e) => esc(e, 200)).join(" \xB7 ") || "\u2014"
+    ])
+  };
+}
+function sliceHarm(slice, review) {
+  return review.metric.goal === "minimize" ? slice.delta.estimate : -slice.delta.estimate;
+}
+function sortSlices(review) {
+  const rank = (s) => s.hiddenRegression ? 0 : s.change === "worse" ? 1 : s.change === "flat" ? 2 : 3;
+  return [...review.slices].sort(
+    (a, b) => rank(a) - rank(b) || sliceHarm(b, review) - sliceHarm(a, review) || (a.name < b.name ? -1 : a.name > b.name ? 1 : 0)
+  );
+}
+function slicesTable(review, esc, limit) {
+  const f = numberFormatFor(review);
+  const rows = sortSlices(review).slice(0, limit).map((s) => [
+    esc(s.name),
+    s.examples === null ? "n/a" : count(s.examples),
+    num(s.baseline, f),
+    num(s.candidate, f),
+    signed(s.delta.estimate, f),
+    s.pAdjusted === null ? "n/a" : pValue(s.pAdjusted).replace(/^p /, "").replace(/^= /, ""),
+    s.hiddenRegression ? "worse (hidden)" : s.change
+  ]);
+  return {
+    header: ["Slice", "Examples", "Baseline", "Candidate", "\u0394", "p (Holm)", "Change"],
+    align: ["l", "r", "r", "r", "r", "r", "l"],
+    rows
+  };
+}
+function sliceCounts(slices) {
+  const out = { worse: 0, better: 0, flat: 0 };
+  for (const s of slices) out[s.change] += 1;
+  return out;
+}
+var MAX_HYPERPARAMETER_ROWS = 50;
+function hyperparameterTable(review, esc) {
+  return {
+    header: ["Hyperparameter", "Baseline", "Candidate", "Change"],
+    align: ["l", "l", "l", "l"],
+    rows: review.hyperparameters.slice(0, MAX_HYPERPARAMETER_ROWS).map((h) => [
+      esc(h.key),
+      h.kind === "added" ? "(absent)" : esc(displayValue(h.baseline), 60),
+      h.kind === "removed" ? "(absent)" : esc(displayValue(h.candidate), 60),
+      h.kind
+    ])
   };
 }
 
+// src/report/headline.ts
+function changePhrase(name, delta, review) {
+  const f = numberFormatFor(review);
+  if (delta === null) return `${name} unknown`;
+  const level = levelPercent(review);
+  const stats = delta.ci === null ? `${signed(delta.estimate, f)}, noise unknown` : `${signed(delta.estimate, f)}, ${level}% interval ${interval(delta.ci, f)}, ${pValue(delta.p)}`;
+  const word = delta.call === "up" ? "rose" : delta.call === "down" ? "fell" : "held steady";
+  return `${name} ${word} (${stats})`;
+}
+function buildHeadline(review, esc) {
+  const f = numberFormatFor(review);
+  const metric = esc(review.metric.name, 60);
+  const v = review.validation;
+  const vBase = review.splits.find((s) => s.split === "validation");
+  const movementTone = review.movement === "better-on-both" || review.movement === "away-from-overfitting" || review.movement === "away-from-underfitting" ? "good" : review.movement === "no-significant-change" ? "neutral" : "bad";
+  const vTone = v.change === "better" ? "good" : v.change === "worse" ? "bad" : "neutral";
+  const level = levelPercent(review);
+  const vStats = v.delta.ci === null ? `\u0394 ${signed(v.delta.estimate, f)}; run-to-run noise unknown` : `\u0394 ${signed(v.delta.estimate, f)}, ${level}% interval ${interval(v.delta.ci, f)}, ${pValue(v.delta.p)}, ${TEST_WORD[v.delta.test]}`;
+  const from = vBase === void 0 ? "" : `${num(vBase.baseline, f)} \u2192 ${num(vBase.candidate, f)} `;
+  const lines = [
+    {
+      label: MOVEMENT_SENTENCE[review.movement],
+      text: `${changePhrase(
+        "avoidable bias",
+        review.bias.delta,
+        review
+      )}; ${changePhrase("variance", review.variance.delta, review)}. Diagnosis: baseline ${DIAGNOSIS_WORD[review.baseline.diagnosis]}, candidate ${DIAGNOSIS_WORD[review.candidate.diagnosis]}.`,
+      tone: movementTone
+    },
+    {
+      label: `Validation ${metric} ${VALIDATION_WORD[v.change]}`,
+      text: `${from}(${vStats}).`,
+      tone: vTone
+    }
+  ];
+  const gate = review.gate;
+  lines.push({
+    label: gate.pass ? "Gate passed" : "Gate failed",
+    text: gate.pass ? gate.failOn.length === 0 ? "no fail-on policy is set." : `none of fail-on (${gate.failOn.map((p) => esc(p, 60)).join(", ")}) applies.` : `${gate.reasons.map((r) => esc(r, 200)).join("; ")}.`,
+    tone: gate.pass ? "good" : "bad"
+  });
+  const first = review.levers[0];
+  lines.push(
+    first === void 0 ? { label: "Next lever", text: "none suggested.", tone: "neutral" } : {
+      label: `Next lever: ${LEVER_TITLE[first.id]}`,
+      text: esc(first.reason, 300),
+      tone: "neutral"
+    }
+  );
+  const hidden = sortSlices(review).filter((s) => s.hiddenRegression);
+  const worst = hidden[0];
+  if (worst !== void 0) {
+    lines.push({
+      label: `${hidden.length} ${hidden.length === 1 ? "slice" : "slices"} got worse while validation improved`,
+      text: `worst: ${esc(worst.name, 60)} (${signed(worst.delta.estimate, f)}).`,
+      tone: "bad"
+    });
+  }
+  const title = `${MOVEMENT_TITLE[review.movement]} \xB7 validation ${VALIDATION_WORD[v.change]} \xB7 gate ${gate.pass ? "passed" : "failed"}`;
+  return { title, tone: gate.pass ? movementTone : "bad", lines };
+}
+
+// src/report/marker.ts
+var KEY_PATTERN = /^[A-Za-z0-9._-]{1,64}$/;
+var MARKER_PATTERN = /<!-- fitgap:review key=([A-Za-z0-9._-]{1,64}) head=([0-9a-f]{0,64}) -->/;
+function isValidCommentKey(key) {
+  return KEY_PATTERN.test(key);
+}
+function buildMarker(marker) {
+  if (!isValidCommentKey(marker.key)) {
+    throw new RangeError(
+      `comment key ${JSON.stringify(marker.key)} must be 1-64 letters, digits, '.', '_' or '-'`
+    );
+  }
+  const head = /^[0-9a-f]{0,64}$/.test(marker.head) ? marker.head : "";
+  return `<!-- fitgap:review key=${marker.key} head=${head} -->`;
+}
+function parseMarker(body) {
+  const match = MARKER_PATTERN.exec(body);
+  if (match === null) return null;
+  return { key: match[1] ?? "", head: match[2] ?? "" };
+}
+
+// src/report/mermaid.ts
+var MAX_POINTS = 100;
+var PALETTE = {
+  baselineValidation: ["#1f5fa8", "dark blue"],
+  baselineTrain: ["#8fbce6", "light blue"],
+  candidateValidation: ["#c2410c", "dark orange"],
+  candidateTrain: ["#f6b07a", "light orange"]
+};
+function buildCharts(review) {
+  const charts = [];
+  const plane = planeChart(review);
+  if (plane !== null) charts.push(plane);
+  for (const curve of ["epochs", "training_examples", "regularization"]) {
+    charts.push(...curveCharts(review, curve));
+  }
+  return charts;
+}
+function planeThreshold(review) {
+  const level = (review.baseline.errorLevel + review.candidate.errorLevel) / 2;
+  return Math.max(review.settings.gapTolerance * Math.abs(level), review.settings.minEffect);
+}
+function planeChart(review) {
+  const points = [];
+  for (const run of ["baseline", "candidate"]) {
+    const { bias, variance } = review[run].components;
+    if (bias.value === null || variance.value === null) return null;
+    points.push([run, bias.value, variance.value]);
+  }
+  const t = planeThreshold(review);
+  if (!(t > 0) || !Number.isFinite(t)) return null;
+  const axis = (v) => chartNumber(v <= 0 ? 0 : v / (v + t), 3);
+  const format = numberFormatFor(review);
+  const lines = [
+    "quadrantChart",
+    "  title Avoidable bias and variance of both runs",
+    '  x-axis "Low avoidable bias" --> "High avoidable bias"',
+    '  y-axis "Low variance" --> "High variance"',
+    '  quadrant-1 "Both present"',
+    '  quadrant-2 "Variance present"',
+    '  quadrant-3 "Neither present"',
+    '  quadrant-4 "Bias present"',
+    ...points.map(([run, b, v]) => `  "${run}": [${axis(b)}, ${axis(v)}]`)
+  ];
+  const metric = escapeInline(review.metric.name, 40);
+  const values = points.map(([run, b, v]) => `${run} bias ${num(b, format)}, variance ${num(v, format)}`).join("; ");
+  const caption = `**Bias/variance plane** (${metric}, shortfall units). Each axis is scaled so that its middle line is the presence threshold, ${num(t, format)} (gap tolerance ${short(review.settings.gapTolerance)} \xD7 the mean validation error level); right of it avoidable bias is large enough to count, above it variance. Values: ${values}.`;
+  return { kind: "plane", caption, code: lines.join("\n") };
+}
+var CURVE_TEXT = {
+  epochs: { title: "Epoch curve", x: "epoch", caption: "Epoch curve" },
+  training_examples: {
+    title: "Learning curve",
+    x: "training examples",
+    caption: "Learning curve"
+  },
+  regularization: {
+    title: "Regularization curve",
+    x: "regularization strength",
+    caption: "Regularization curve"
+  }
+};
+function usable(evidence) {
+  if (evidence === void 0 || isSkipped(evidence)) return null;
+  const chart2 = evidence.chart.filter((p) => Number.isFinite(p.x) && Number.isFinite(p.validation));
+  return chart2.length >= 2 ? chart2 : null;
+}
+function isSkipped(evidence) {
+  return "skipped" in evidence;
+}
+function seriesOf(run, summary2, curve) {
+  const points = usable(summary2.curves[curve]);
+  if (points === null) return [];
+  const sorted = [...points].sort((a, b) => a.x - b.x);
+  const out = [
+    { run, part: "validation", points: sorted.map((p) => [p.x, p.validation]) }
+  ];
+  const train = sorted.filter((p) => p.train !== void 0 && Number.isFinite(p.train));
+  if (train.length >= 2) {
+    out.push({ run, part: "train", points: train.map((p) => [p.x, p.train ?? 0]) });
+  }
+  return out;
+}
+function curveCharts(review, curve) {
+  const all = [
+    ...seriesOf("baseline", review.baseline, curve),
+    ...seriesOf("candidate", review.candidate, curve)
+  ];
+  if (all.length === 0) return [];
+  const runs = [...new Set(all.map((s) => s.run))];
+  const ranges = runs.map((run) => {
+    const xs = all.filter((s) => s.run === run).flatMap((s) => s.points.map((p) => p[0]));
+    return [Math.min(...xs), Math.max(...xs)];
+  });
+  const lo = Math.max(...ranges.map((r) => r[0]));
+  const hi = Math.min(...ranges.map((r) => r[1]));
+  const unionLo = Math.min(...ranges.map((r) => r[0]));
+  const unionHi = Math.max(...ranges.map((r) => r[1]));
+  const yAll = all.flatMap((s) => s.points.map((p) => p[1]));
+  const yRange = [Math.min(...yAll), Math.max(...yAll)];
+  if (runs.length === 1) {
+    const run = runs[0] ?? "candidate";
+    if (!(hi > lo)) return [];
+    const chart2 = lineChart(review, curve, all, [lo, hi], yRange, run);
+    const other = run === "baseline" ? "candidate" : "baseline";
+    return [
+      { ...chart2, caption: `${chart2.caption} The ${other} has no chartable curve of this kind.` }
+    ];
+  }
+  if (hi > lo && hi - lo >= 0.8 * (unionHi - unionLo)) {
+    return [lineChart(review, curve, all, [lo, hi], yRange, null)];
+  }
+  return runs.flatMap((run) => {
+    const series = all.filter((s) => s.run === run);
+    const range = ranges[runs.indexOf(run)] ?? [lo, hi];
+    if (!(range[1] > range[0])) return [];
+    return [lineChart(review, curve, series, [range[0], range[1]], yRange, run)];
+  });
+}
+function lineChart(review, curve, series, [lo, hi], [yMin, yMax], only) {
+  const text2 = CURVE_TEXT[curve];
+  const ordered = orderSeries(series);
+  const xs = [
+    ...new Set(ordered.flatMap((s) => s.points.map((p) => p[0])).filter((x2) => x2 >= lo && x2 <= hi))
+  ].sort((a, b) => a - b);
+  const geometric = curve !== "epochs" && lo > 0 && hi / lo >= 10;
+  const grid = geometric ? thin(xs, MAX_POINTS) : evenGrid(lo, hi, Math.min(MAX_POINTS, xs.length));
+  const yPad = (yMax - yMin) * 0.05 || Math.abs(yMax) * 0.05 || 1;
+  const y0 = yMin - yPad;
+  const y1 = yMax + yPad;
+  const yDecimals = Math.min(6, Math.max(0, 2 - Math.floor(Math.log10(y1 - y0))));
+  const xDecimals = Number.isInteger(lo) && Number.isInteger(hi) ? 0 : Math.min(6, Math.max(0, 2 - Math.floor(Math.log10(Math.max(hi - lo, 1e-9)))));
+  const metric = mermaidLabel(review.metric.name, 40) || "metric";
+  const unit = review.metric.kind === "proportion" ? "proportion" : "metric units";
+  const title = only === null ? text2.title : `${text2.title}, ${only}`;
+  const palette = ordered.map((s) => PALETTE[paletteKey(s)][0]).join(", ");
+  const lines = [
+    `%%{init: {"themeVariables": {"xyChart": {"plotColorPalette": "${palette}"}}}}%%`,
+    "xychart-beta",
+    `  title "${title}"`,
+    geometric ? `  x-axis "${text2.x}" [${grid.map((x2) => `"${short(x2)}"`).join(", ")}]` : `  x-axis "${text2.x}" ${chartNumber(lo, xDecimals)} --> ${chartNumber(hi, xDecimals)}`,
+    `  y-axis "${metric} (${unit})" ${chartNumber(y0, yDecimals)} --> ${chartNumber(y1, yDecimals)}`,
+    ...ordered.map(
+      (s) => `  line [${grid.map((x2) => chartNumber(interpolate(s.points, x2, geometric), yDecimals + 1)).join(", ")}]`
+    )
+  ];
+  const legend = ordered.map((s) => `${PALETTE[paletteKey(s)][1]} = ${s.run} ${s.part}`).join(", ");
+  const scale = geometric ? " The x positions are evenly spaced categories (roughly a log scale)." : "";
+  const clipped = only === null && series.some((s) => s.points.some((p) => p[0] < lo || p[0] > hi)) ? ` Drawn over the x range both runs cover (${short(lo)} to ${short(hi)}).` : "";
+  const caption = `**${text2.caption}${only === null ? "" : ` (${only})`}**, ${escapeInline(
+    review.metric.name,
+    40
+  )} by ${text2.x}. Lines: ${legend}.${scale}${clipped}`;
+  return { kind: curve, caption, code: lines.join("\n") };
+}
+function paletteKey(s) {
+  return s.part === "validation" ? `${s.run}Validation` : `${s.run}Train`;
+}
+function orderSeries(series) {
+  const rank = (s) => (s.run === "baseline" ? 0 : 2) + (s.part === "train" ? 1 : 0);
+  return [...series].sort((a, b) => rank(a) - rank(b));
+}
+function evenGrid(lo, hi, n) {
+  const count2 = Math.max(2, n);
+  return Array.from({ length: count2 }, (_, i2) => lo + (hi - lo) * i2 / (count2 - 1));
+}
+function thin(values, max2) {
+  if (values.length <= max2) return values;
+  return Array.from(
+    { length: max2 },
+    (_, i2) => values[Math.round(i2 * (values.length - 1) / (max2 - 1))] ?? 0
+  );
+}
+function interpolate(points, x2, logX) {
+  const first = points[0];
+  const last = points[points.length - 1];
+  if (first === void 0 || last === void 0) return Number.NaN;
+  if (x2 <= first[0]) return first[1];
+  if (x2 >= last[0]) return last[1];
+  const f = (v) => logX ? Math.log(v) : v;
+  for (let i2 = 1; i2 < points.length; i2 += 1) {
+    const a = points[i2 - 1];
+    const b = points[i2];
+    if (a === void 0 || b === void 0) continue;
+    if (x2 <= b[0]) {
+      const span = f(b[0]) - f(a[0]);
+      const w = span === 0 ? 0 : (f(x2) - f(a[0])) / span;
+      return a[1] + w * (b[1] - a[1]);
+    }
+  }
+  return last[1];
+}
+
+// src/report/notes.ts
+function methodNotes(review, esc) {
+  const s = review.settings;
+  const lines = [
+    `alpha = ${short(s.alpha)}: a change counts as up or down only when it is significant at this level and at least min-effect in size; intervals are ${levelPercent(review)}%.`,
+    `min-effect = ${short(s.minEffect)} (${review.metric.kind === "proportion" ? "proportion" : "metric units"}): smaller changes are called flat however significant.`,
+    `gap tolerance = ${short(s.gapTolerance)}: a component is present when it is at least this share of the run's validation error level (and at least min-effect, and significantly above 0 where its noise is known).`,
+    `fail-on = ${s.failOn.length === 0 ? "(empty: the gate always passes)" : s.failOn.map((p) => esc(p, 60)).join(", ")}.`
+  ];
+  const uses = /* @__PURE__ */ new Map();
+  const use = (what, delta) => {
+    if (delta === null) return;
+    uses.set(delta.test, [...uses.get(delta.test) ?? [], what]);
+  };
+  use("validation change", review.validation.delta);
+  use("avoidable bias", review.bias.delta);
+  use("variance", review.variance.delta);
+  use("data mismatch", review.mismatch.delta);
+  use("validation overfit", review.overfit.delta);
+  for (const split of review.splits) use(`${SPLIT_WORD[split.split]} split`, split.delta);
+  if (review.slices.length > 0) {
+    const tests = [...new Set(review.slices.map((x2) => x2.delta.test))];
+    for (const t of tests) uses.set(t, [...uses.get(t) ?? [], "slices"]);
+  }
+  for (const [test, what] of uses) {
+    lines.push(`${[...new Set(what)].join(", ")}: ${TEST_WHY[test]}`);
+  }
+  if (review.slices.length > 0) {
+    lines.push(
+      `Slice p-values are adjusted with the Holm\u2013Bonferroni method over all ${count(review.slices.length)} slices, so a few bad slices among many are not flagged by chance.`
+    );
+  }
+  if (review.paired !== null) {
+    const d = review.paired.discordant;
+    lines.push(
+      `Paired predictions: ${count(review.paired.rows)} examples scored by both runs${d === void 0 ? "" : `; ${count(d.baselineOnly)} right only in the baseline, ${count(d.candidateOnly)} right only in the candidate`}.`
+    );
+  }
+  for (const run of ["baseline", "candidate"]) {
+    const r = review[run];
+    lines.push(referenceLine(run, r, review));
+    for (const w of r.warnings) lines.push(`${run}: ${esc(w, 300)}`);
+  }
+  for (const n of review.notes) lines.push(esc(n, 300));
+  for (const n of review.nonLevers) lines.push(esc(n, 300));
+  return lines;
+}
+function referenceLine(run, r, review) {
+  const f = numberFormatFor(review);
+  if (r.reference === null) {
+    return `${run}: no reference level, so avoidable bias is unknown; set \`reference\` in the artifact or the config.`;
+  }
+  const source = {
+    artifact: "from the artifact",
+    config: "from the config",
+    default: "the default for a minimized proportion",
+    unknown: "source unknown"
+  }[r.referenceSource];
+  return `${run}: reference level ${num(r.reference, f)} (${source}).`;
+}
+var CURVE_WORD = {
+  epochs: "Epoch curve",
+  training_examples: "Learning curve",
+  regularization: "Regularization curve"
+};
+function skipped(e) {
+  return "skipped" in e;
+}
+function curveEvidence(review, esc) {
+  const f = numberFormatFor(review);
+  const lines = [];
+  for (const run of ["baseline", "candidate"]) {
+    const curves = review[run].curves;
+    const e = curves.epochs;
+    if (e !== void 0) {
+      lines.push(
+        skipped(e) ? `${run}, ${CURVE_WORD.epochs}: not analysed (${esc(e.skipped, 200)}).` : `${run}, ${CURVE_WORD.epochs}: lowest validation ${num(e.bestValidation, f)} at epoch ${short(e.bestX)}; final ${num(e.finalValidation, f)} at epoch ${short(e.finalX)}; ${e.gl === null ? "generalization loss undefined (best validation is 0)" : `generalization loss ${e.gl.toFixed(1)}%`}${e.pq === null ? "" : `, progress quotient ${e.pq.toFixed(2)}`}${e.stoppedLate ? "; trained past the minimum" : ""}${e.stoppedEarly ? "; still improving at the end" : ""}.`
+      );
+    }
+    const l = curves.training_examples;
+    if (l !== void 0) {
+      const lp = skipped(l) ? "" : l.projections.map(
+        (p) => `${short(p.x)} examples \u2192 ${num(p.validation, f)} [${num(p.ci[0], f)}, ${num(p.ci[1], f)}]`
+      ).join("; ");
+      lines.push(
+        skipped(l) ? `${run}, ${CURVE_WORD.training_examples}: not analysed (${esc(l.skipped, 200)}).` : `${run}, ${CURVE_WORD.training_examples}: power-law fit R\xB2 ${l.r2.toFixed(3)}, residual sd ${num(l.residual, f)}; projected validation: ${lp || "none"}; train/validation gap ${l.gapTrend}.`
+      );
+    }
+    const g = curves.regularization;
+    if (g !== void 0) {
+      lines.push(
+        skipped(g) ? `${run}, ${CURVE_WORD.regularization}: not analysed (${esc(g.skipped, 200)}).` : `${run}, ${CURVE_WORD.regularization}: lowest validation ${num(g.bestValidation, f)} at strength ${short(g.bestX)}; the run's own strength is ${g.side === "at" ? "at" : g.side === "unknown" ? "at an unknown place relative to" : g.side} the best; suggested ${short(g.suggestedX)}${g.atEdge === null ? "" : `; the minimum is at the ${g.atEdge} end of the sweep, so extend it`}.`
+      );
+    }
+  }
+  return lines;
+}
+function provenanceTables(review, esc, files) {
+  const runs = {
+    header: ["Run", "Name", "Commit", "Created"],
+    align: ["l", "l", "l", "l"],
+    rows: ["baseline", "candidate"].map((run) => {
+      const r = review[run];
+      return [
+        run,
+        esc(r.name),
+        r.commit === null ? "n/a" : esc(r.commit, 64),
+        r.createdAt === null ? "n/a" : esc(r.createdAt, 40)
+      ];
+    })
+  };
+  if (files.length === 0) return [runs];
+  const fileTable = {
+    header: ["File", "Path", "sha256"],
+    align: ["l", "l", "l"],
+    rows: files.map((file) => [esc(file.label, 40), esc(file.path, 120), esc(file.sha256, 64)])
+  };
+  return [runs, fileTable];
+}
+
+// src/report/markdown.ts
+var GITHUB_COMMENT_LIMIT = 65536;
+var DEFAULT_TARGET_LENGTH = 6e4;
+var SLICES_SHOWN = 20;
+var SLICES_WHEN_SHORT = 5;
+var STAGES = [
+  { slices: SLICES_SHOWN, charts: true, methodNotes: true, rest: true },
+  { slices: SLICES_WHEN_SHORT, charts: true, methodNotes: true, rest: true },
+  { slices: SLICES_WHEN_SHORT, charts: false, methodNotes: true, rest: true },
+  { slices: SLICES_WHEN_SHORT, charts: false, methodNotes: false, rest: true },
+  { slices: 0, charts: false, methodNotes: false, rest: false }
+];
+function droppedBy(review, d, hasCharts) {
+  const n = review.slices.length;
+  return [
+    d.slices === 0 && n > 0 ? "all slices" : "",
+    d.slices > 0 && d.slices < SLICES_SHOWN && n > d.slices ? `slices beyond the worst ${d.slices}` : "",
+    !d.charts && hasCharts ? "charts" : "",
+    d.methodNotes ? "" : "method notes",
+    d.rest ? "" : "curve evidence, hyperparameter changes and provenance"
+  ].filter((x2) => x2 !== "");
+}
+function renderMarkdown(review, options = {}) {
+  const limit = options.maxLength ?? GITHUB_COMMENT_LIMIT;
+  const target = options.maxLength === void 0 ? DEFAULT_TARGET_LENGTH : limit;
+  const marker = buildMarker({ key: options.commentKey ?? "default", head: options.headSha ?? "" });
+  const files = options.provenance?.files ?? [];
+  const charts = buildCharts(review);
+  for (const detail of STAGES) {
+    const body = compose(review, { marker, files, charts }, detail);
+    if (body.length <= target) return body;
+  }
+  const minimal = [
+    marker,
+    ...headlineBlock(review),
+    `_Shortened to fit the size limit: left out the tables, levers, charts and details. The JSON report has every number._`,
+    "",
+    `_${CAUTION}_`,
+    ""
+  ].join("\n");
+  if (minimal.length <= target) return minimal;
+  const stub = `${marker}
+## fitgap review
+
+Too large for this space: see the JSON report.
+`;
+  return stub.length <= target ? stub : stub.slice(0, Math.max(0, target));
+}
+function table(t) {
+  return markdownTable([t.header, ...t.rows], { align: t.align, alignDelimiters: false });
+}
+function details(summary2, body) {
+  return ["<details>", `<summary>${summary2}</summary>`, "", ...body, "", "</details>", ""];
+}
+function headlineBlock(review) {
+  const h = buildHeadline(review, escapeInline);
+  return [
+    `## fitgap review: ${h.title}`,
+    "",
+    ...h.lines.map((l) => `- **${l.label}**: ${l.text}`),
+    ""
+  ];
+}
+function compose(review, { marker, files, charts }, d) {
+  const out = [marker, ...headlineBlock(review)];
+  out.push("### Splits", "", table(splitsTable(review)), "");
+  out.push("### Error decomposition", "", table(decompositionTable(review)), "");
+  const missing = unavailableNotes(review, escapeInline);
+  if (missing.length > 0) out.push(...missing.map((m) => `- ${m}`), "");
+  if (review.levers.length > 0) {
+    out.push("### Next levers", "", table(leversTable(review, escapeInline)), "");
+  }
+  if (d.charts) {
+    if (charts.length > 0) {
+      out.push("### Charts", "");
+      for (const chart2 of charts) {
+        out.push(chart2.caption, "", "```mermaid", chart2.code, "```", "");
+      }
+    }
+  }
+  if (review.slices.length > 0 && d.slices > 0) {
+    const c = sliceCounts(review.slices);
+    const shown = Math.min(d.slices, review.slices.length);
+    const rest = review.slices.length - shown;
+    const body = [table(slicesTable(review, escapeInline, d.slices))];
+    if (rest > 0) {
+      body.push(
+        "",
+        `${count(rest)} more ${rest === 1 ? "slice is" : "slices are"} not shown; the JSON report has all ${count(review.slices.length)}.`
+      );
+    }
+    out.push(
+      ...details(
+        `Slices: ${count(c.worse)} worse, ${count(c.better)} better, ${count(c.flat)} unchanged (worst first)`,
+        body
+      )
+    );
+  }
+  if (d.rest) {
+    const evidence = curveEvidence(review, escapeInline);
+    if (evidence.length > 0)
+      out.push(
+        ...details(
+          "Curve evidence",
+          evidence.map((e) => `- ${e}`)
+        )
+      );
+    if (review.hyperparameters.length > 0) {
+      const body = [table(hyperparameterTable(review, escapeInline))];
+      const rest = review.hyperparameters.length - MAX_HYPERPARAMETER_ROWS;
+      if (rest > 0) body.push("", `${count(rest)} more changes are not shown.`);
+      out.push(
+        ...details(`Hyperparameter changes (${count(review.hyperparameters.length)})`, body)
+      );
+    }
+  }
+  if (d.methodNotes) {
+    out.push(
+      ...details(
+        "Method notes",
+        methodNotes(review, escapeInline).map((n) => `- ${n}`)
+      )
+    );
+  }
+  if (d.rest) {
+    const tables = provenanceTables(review, escapeInline, files);
+    out.push(
+      ...details(
+        "Provenance",
+        tables.flatMap((t) => [table(t), ""])
+      )
+    );
+  }
+  const dropped = droppedBy(review, d, charts.length > 0);
+  if (dropped.length > 0) {
+    out.push(
+      `_Shortened to fit the size limit: left out ${dropped.join("; ")}. The JSON report has every number._`,
+      ""
+    );
+  }
+  out.push(`_${CAUTION}_`, "");
+  return out.join("\n");
+}
+
 // src/entries/action/baseline.ts
-import { mkdir as mkdir3, writeFile as writeFile3 } from "node:fs/promises";
-import { basename, dirname as dirname3, join as join4, resolve as resolve3 } from "node:path";
-async function resolveBaseline(deps) {
+import { mkdir as mkdir3, mkdtemp as mkdtemp2, writeFile as writeFile3 } from "node:fs/promises";
+import { basename, dirname as dirname3, join as join2, resolve as resolve4 } from "node:path";
+async function resolveBaseline(deps, baseBranch) {
   const { settings, context: context3, octokit, io } = deps;
-  if (settings.baseline !== null) return resolve3(settings.workspace, settings.baseline);
+  if (settings.baseline !== null) return resolve4(settings.workspace, settings.baseline);
   const name = settings.baselineArtifact ?? "";
-  const filter = runFilter(settings, context3);
+  const filter = baseBranch !== void 0 && settings.baselineRef === null ? { branch: baseBranch } : runFilter(settings, context3);
   const workflow = await currentWorkflow(deps);
   const artifact = await findArtifact({
     octokit,
@@ -50549,13 +50894,15 @@ async function resolveBaseline(deps) {
     limitBytes: settings.archiveLimitBytes,
     label: `artifact "${name}" (run ${artifact.runId})`
   });
-  const root = join4(settings.tempDir, `fitgap-${settings.commentKey}`, "baseline");
+  const parent = join2(settings.tempDir, `fitgap-${settings.commentKey}`);
+  await mkdir3(parent, { recursive: true });
+  const root = await mkdtemp2(join2(parent, "baseline-"));
   for (const [entry, bytes] of picked.files) {
-    const target = join4(root, ...entry.split(/[\\/]/));
+    const target = join2(root, ...entry.split(/[\\/]/));
     await mkdir3(dirname3(target), { recursive: true });
-    await writeFile3(target, bytes);
+    await writeFile3(target, bytes, { flag: "wx" });
   }
-  return join4(root, ...picked.run.split(/[\\/]/));
+  return join2(root, ...picked.run.split(/[\\/]/));
 }
 function runFilter(settings, context3) {
   const ref = settings.baselineRef;
@@ -50584,27 +50931,400 @@ async function currentWorkflow(deps) {
   return data.workflow_id;
 }
 
+// src/io/github/check.ts
+var MAX_CHECK_OUTPUT_CHARS = 65535;
+var MAX_STATUS_DESCRIPTION = 140;
+async function publishGate(options) {
+  const { octokit, repo, sha, name, pass } = options;
+  if (options.kind === "commit-status") {
+    const description = pass ? `passed: ${options.title}` : `failed: ${options.reasons.join("; ")}`;
+    const { data: data2 } = await octokit.rest.repos.createCommitStatus({
+      ...repo,
+      sha,
+      state: pass ? "success" : "failure",
+      context: name,
+      description: clip(description, MAX_STATUS_DESCRIPTION),
+      ...options.detailsUrl === void 0 ? {} : { target_url: options.detailsUrl }
+    });
+    return { kind: "commit-status", url: data2.url };
+  }
+  const reasons = pass ? "" : `**Gate failed**
+
+${options.reasons.map((r) => `- ${r}`).join("\n")}
+
+`;
+  const { data } = await octokit.rest.checks.create({
+    ...repo,
+    name,
+    head_sha: sha,
+    status: "completed",
+    conclusion: pass ? "success" : "failure",
+    ...options.detailsUrl === void 0 ? {} : { details_url: options.detailsUrl },
+    output: {
+      title: clip(options.title, 200),
+      summary: clip(reasons + options.summary, MAX_CHECK_OUTPUT_CHARS)
+    }
+  });
+  return { kind: "check-run", url: data.html_url ?? data.url };
+}
+function clip(text2, max2) {
+  if (text2.length <= max2) return text2;
+  const note = max2 > 200 ? "\n\n\u2026cut to fit; the full review is in the job summary." : "\u2026";
+  const room = max2 - note.length;
+  const cut = text2.lastIndexOf("\n", room);
+  return text2.slice(0, cut > room / 2 ? cut : room) + note;
+}
+
+// src/io/github/comment.ts
+var MAX_COMMENT_CHARS = 65536;
+async function publishComment(options) {
+  const { octokit, repo, pullNumber, key } = options;
+  const body = fitBody(withMarker(options.body, key, options.headSha), options);
+  const currentHead = options.currentHead ?? (await octokit.rest.pulls.get({ ...repo, pull_number: pullNumber })).data.head.sha;
+  if (currentHead !== options.headSha) return { action: "stale", currentHead };
+  if (options.mode === "new") {
+    const { data: data2 } = await octokit.rest.issues.createComment({
+      ...repo,
+      issue_number: pullNumber,
+      body
+    });
+    return { action: "created", id: data2.id, url: data2.html_url };
+  }
+  const ours = await listOurComments(options, null);
+  const [target, ...duplicates] = ours;
+  if (target === void 0) {
+    const { data: created } = await octokit.rest.issues.createComment({
+      ...repo,
+      issue_number: pullNumber,
+      body
+    });
+    return dedupeAfterCreate(options, body, created);
+  }
+  await deleteComments(options, duplicates);
+  if (target.body === body) return { action: "unchanged", id: target.id, url: target.html_url };
+  const { data } = await octokit.rest.issues.updateComment({
+    ...repo,
+    comment_id: target.id,
+    body
+  });
+  return { action: "updated", id: data.id, url: data.html_url };
+}
+async function dedupeAfterCreate(options, body, created) {
+  const ours = await listOurComments(options, created.user?.login ?? null);
+  const [oldest, ...later] = ours;
+  if (oldest === void 0 || oldest.id === created.id) {
+    await deleteComments(options, later);
+    return { action: "created", id: created.id, url: created.html_url };
+  }
+  await deleteComments(options, later);
+  if (oldest.body === body) return { action: "unchanged", id: oldest.id, url: oldest.html_url };
+  const { data } = await options.octokit.rest.issues.updateComment({
+    ...options.repo,
+    comment_id: oldest.id,
+    body
+  });
+  return { action: "updated", id: data.id, url: data.html_url };
+}
+async function listOurComments(options, login) {
+  const ours = [];
+  const pages = options.octokit.paginate.iterator(options.octokit.rest.issues.listComments, {
+    ...options.repo,
+    issue_number: options.pullNumber,
+    per_page: 100
+  });
+  for await (const page of pages) {
+    for (const comment of page.data) {
+      if (isOurs(comment, options.key, login)) ours.push(comment);
+    }
+  }
+  return ours.sort((a, b) => a.created_at.localeCompare(b.created_at) || a.id - b.id);
+}
+function isOurs(comment, key, login = null) {
+  if (comment.user?.type !== "Bot") return false;
+  if (login !== null && comment.user.login !== login) return false;
+  return parseMarker(comment.body ?? "")?.key === key;
+}
+async function deleteComments(options, comments) {
+  for (const comment of comments) {
+    await options.octokit.rest.issues.deleteComment({ ...options.repo, comment_id: comment.id });
+  }
+}
+function withMarker(body, key, headSha) {
+  return parseMarker(body)?.key === key ? body : `${buildMarker({ key, head: headSha })}
+${body}`;
+}
+function fitBody(body, options) {
+  if (body.length <= MAX_COMMENT_CHARS) return body;
+  const where = options.runUrl === void 0 ? "the job summary" : `the [job summary](${options.runUrl})`;
+  return `${buildMarker({ key: options.key, head: options.headSha })}
+fitgap's review is ${body.length} characters long, more than a comment can hold (${MAX_COMMENT_CHARS}). Read it in ${where}.
+`;
+}
+
+// src/entries/action/publish-steps.ts
+function setReviewOutputs(io, review, reportPath, reportDir) {
+  io.setOutput("movement", review.movement);
+  io.setOutput("validation-change", review.validation.change);
+  io.setOutput("candidate-diagnosis", review.candidate.diagnosis);
+  io.setOutput("gate", review.gate.pass ? "pass" : "fail");
+  io.setOutput("report-path", reportPath);
+  io.setOutput("report-dir", reportDir);
+}
+function gateFailure(review) {
+  return `fitgap gate failed:
+${review.gate.reasons.map((r) => `- ${r}`).join("\n")}`;
+}
+function runUrl(context3) {
+  return `${context3.serverUrl}/${context3.repo.owner}/${context3.repo.repo}/actions/runs/${context3.runId}`;
+}
+async function commentStep(deps, target, body) {
+  const { settings, context: context3, octokit, io } = deps;
+  if (settings.comment === "off") return null;
+  try {
+    const outcome = await publishComment({
+      octokit,
+      repo: context3.repo,
+      pullNumber: target.pullNumber,
+      headSha: target.headSha,
+      key: settings.commentKey,
+      body,
+      mode: settings.comment,
+      runUrl: runUrl(context3),
+      ...target.currentHead === void 0 ? {} : { currentHead: target.currentHead }
+    });
+    if (outcome.action === "stale") {
+      io.info(
+        `Not commenting: this review is for ${target.headSha}, but PR #${target.pullNumber} has moved on to ${outcome.currentHead}; the run for that commit reports it.`
+      );
+      return null;
+    }
+    io.info(`Comment ${outcome.action}: ${outcome.url}`);
+    io.setOutput("comment-url", outcome.url);
+    return null;
+  } catch (error2) {
+    if (isRequestError(error2) && error2.status === 403) {
+      const text2 = `fitgap could not comment on PR #${target.pullNumber} (${describeRequestError(error2)}). Fork PRs get a read-only token: use the two-workflow pattern (examples/fork-safe-*.yml), or grant "pull-requests: write". The review is in this job summary.`;
+      io.warning(text2);
+      await io.appendSummary(`
+> [!WARNING]
+> ${text2}
+`);
+      return null;
+    }
+    if (isRequestError(error2))
+      return `Could not publish the comment: ${describeRequestError(error2)}`;
+    throw error2;
+  }
+}
+async function gateCheckStep(deps, kind, sha, review, body) {
+  const { settings, context: context3, octokit, io } = deps;
+  const name = settings.commentKey === "default" ? "fitgap" : `fitgap (${settings.commentKey})`;
+  try {
+    const outcome = await publishGate({
+      octokit,
+      repo: context3.repo,
+      sha,
+      kind,
+      name,
+      pass: review.gate.pass,
+      title: `${review.movement}; validation ${review.validation.change}`,
+      summary: body,
+      reasons: review.gate.reasons,
+      detailsUrl: runUrl(context3)
+    });
+    io.info(
+      `Gate published as a ${outcome.kind} on ${sha}: ${review.gate.pass ? "pass" : "fail"}.`
+    );
+    return null;
+  } catch (error2) {
+    if (isRequestError(error2))
+      return `Could not publish the gate ${kind}: ${describeRequestError(error2)}`;
+    throw error2;
+  }
+}
+
+// src/entries/action/report-files.ts
+import { mkdir as mkdir4, writeFile as writeFile4 } from "node:fs/promises";
+import { join as join3 } from "node:path";
+
+// src/report/json.ts
+function renderJson(review) {
+  assertFinite2(review, "");
+  return `${JSON.stringify(review, null, 2)}
+`;
+}
+function assertFinite2(value, pointer) {
+  if (typeof value === "number") {
+    if (!Number.isFinite(value)) {
+      throw new RangeError(
+        `fitgap-review/1 ${pointer || "/"} is ${String(value)}; the review model must hold finite numbers only (this is a bug)`
+      );
+    }
+    return;
+  }
+  if (Array.isArray(value)) {
+    value.forEach((item, i2) => assertFinite2(item, `${pointer}/${i2}`));
+    return;
+  }
+  if (value !== null && typeof value === "object") {
+    for (const [key, item] of Object.entries(value)) {
+      assertFinite2(item, `${pointer}/${key.replace(/~/g, "~0").replace(/\//g, "~1")}`);
+    }
+  }
+}
+
+// src/entries/action/report-files.ts
+function reviewJson(review) {
+  return renderJson(review);
+}
+async function writeReportFiles(dir, review) {
+  await mkdir4(dir, { recursive: true });
+  const path = join3(dir, REVIEW_FILE);
+  await writeFile4(path, reviewJson(review));
+  return { dir, path };
+}
+
+// src/entries/action/publish-mode.ts
+function refuse3(issue2) {
+  throw new InputError([{ pointer: "", ...issue2 }]);
+}
+async function runPublish(deps) {
+  const { settings, context: context3, octokit, io } = deps;
+  const run = context3.workflowRun;
+  if (run === null || context3.eventName !== "workflow_run") {
+    refuse3({
+      file: 'input "mode"',
+      expected: 'may be "publish" only in a workflow triggered by workflow_run',
+      got: JSON.stringify(context3.eventName)
+    });
+  }
+  const label = `artifact "${settings.reportArtifact}" (run ${run.id})`;
+  const zip = await downloadUpload(deps, run);
+  const work = join4(settings.tempDir, `fitgap-${settings.commentKey}`);
+  const bundle = await extractBundle({
+    zip,
+    label,
+    tempDir: join4(work, "upload"),
+    limitBytes: settings.archiveLimitBytes,
+    limits: resolveLimits({}, settings.limits)
+  });
+  const note = bundle.note;
+  const fullName2 = `${context3.repo.owner}/${context3.repo.repo}`;
+  if (note.repository !== fullName2 || note.headSha !== run.headSha) {
+    refuse3({
+      file: `${label} ${PULL_REQUEST_FILE}`,
+      expected: `must name this repository (${fullName2}) and the run's head commit (${run.headSha})`,
+      got: `${note.repository} at ${note.headSha}`
+    });
+  }
+  const { data: pull } = await octokit.rest.pulls.get({
+    ...context3.repo,
+    pull_number: note.number
+  });
+  const pullHeadRepo = pull.head.repo?.full_name ?? null;
+  if (pullHeadRepo !== run.headRepo) {
+    refuse3({
+      file: `${label} ${PULL_REQUEST_FILE}`,
+      expected: `must name a PR whose head is in ${run.headRepo ?? "the run head repository"}`,
+      got: `PR #${note.number} from ${pullHeadRepo ?? "a deleted repository"}`
+    });
+  }
+  const trustedBaseline = settings.baseline !== null || settings.baselineArtifact !== null;
+  const baseline = trustedBaseline ? await resolveBaseline(deps, pull.base.ref) : bundle.runs.baseline;
+  const uploaded = (side) => `${label} ${side}/${RUN_FILE}`;
+  const result = await reviewFiles({
+    baseline,
+    candidate: bundle.runs.candidate,
+    ...settings.config === null ? {} : { config: settings.config },
+    cwd: settings.workspace,
+    overrides: settings.overrides,
+    overrideLabel: (name) => `input "${name}"`,
+    limits: settings.limits,
+    // The upload holds the runs as the PR side reviewed them, an epoch log already merged.
+    epochLogs: false,
+    names: {
+      candidate: uploaded("candidate"),
+      ...trustedBaseline ? settings.baseline !== null ? { baseline: settings.baseline } : { baseline: `artifact ${settings.baselineArtifact ?? ""}: ${RUN_FILE}` } : { baseline: uploaded("baseline") }
+    }
+  });
+  const { review, files } = result;
+  const provenance = {
+    files: [
+      { label: "baseline", ...files.baseline },
+      { label: "candidate", ...files.candidate },
+      ...files.config === null ? [] : [{ label: "config", ...files.config }]
+    ]
+  };
+  const body = renderMarkdown(review, {
+    commentKey: settings.commentKey,
+    headSha: run.headSha,
+    provenance
+  });
+  await io.appendSummary(body);
+  const written = await writeReportFiles(join4(work, "report"), review);
+  setReviewOutputs(io, review, written.path, written.dir);
+  const problems = [];
+  const comment = await commentStep(
+    deps,
+    { pullNumber: note.number, headSha: run.headSha, currentHead: pull.head.sha },
+    body
+  );
+  if (comment !== null) problems.push(comment);
+  const kind = settings.statusCheck === "auto" ? "check-run" : settings.statusCheck;
+  if (kind !== "off") {
+    const problem = await gateCheckStep(deps, kind, run.headSha, review, body);
+    if (problem !== null) problems.push(problem);
+  }
+  if (!review.gate.pass)
+    io.info(`Gate failed (published on ${run.headSha}): ${review.gate.reasons.join("; ")}`);
+  if (problems.length > 0) io.setFailed(problems.join("\n"));
+}
+async function downloadUpload(deps, run) {
+  const { settings, context: context3, octokit } = deps;
+  const name = settings.reportArtifact;
+  const { data } = await octokit.rest.actions.listWorkflowRunArtifacts({
+    ...context3.repo,
+    run_id: run.id,
+    name,
+    per_page: 100
+  });
+  const artifact = data.artifacts.find((a) => a.name === name && !a.expired);
+  if (artifact === void 0) {
+    refuse3({
+      file: 'input "report-artifact"',
+      expected: `must name an artifact of the triggering run ${run.id} (conclusion ${run.conclusion ?? "unknown"})`,
+      got: JSON.stringify(name),
+      hint: 'Upload the "report-dir" output of the review step under this name, also when the gate fails (if: always()).'
+    });
+  }
+  return downloadArtifact({
+    octokit,
+    repo: context3.repo,
+    artifact: { id: artifact.id, name, sizeInBytes: artifact.size_in_bytes, runId: run.id },
+    limitBytes: settings.archiveLimitBytes
+  });
+}
+
 // src/entries/action/review-mode.ts
+import { basename as basename2, isAbsolute as isAbsolute2, join as join5, relative as relative3, resolve as resolve5 } from "node:path";
 async function runReview(deps) {
   const { settings, context: context3, io } = deps;
   const baseline = await resolveBaseline(deps);
-  const overrides = {
-    ...settings.alpha === null ? {} : { alpha: settings.alpha },
-    ...settings.minEffect === null ? {} : { minEffect: settings.minEffect },
-    ...settings.failOn === null ? {} : { failOn: settings.failOn }
-  };
-  const { review, files: inputs } = await reviewFiles({
+  const result = await reviewFiles({
     baseline,
     candidate: settings.candidate ?? "",
     ...settings.config === null ? {} : { config: settings.config },
     cwd: settings.workspace,
-    overrides
+    overrides: settings.overrides,
+    overrideLabel: (name) => `input "${name}"`,
+    limits: settings.limits
   });
+  const { review, files: inputs } = result;
   const pr = context3.pullRequest;
   const headSha = pr?.headSha ?? context3.sha;
   const shown = (path) => {
-    const inside = relative2(settings.workspace, resolve4(settings.workspace, path));
-    if (inside !== "" && !inside.startsWith("..") && !isAbsolute(inside)) return inside;
+    const inside = relative3(settings.workspace, resolve5(settings.workspace, path));
+    if (inside !== "" && !inside.startsWith("..") && !isAbsolute2(inside)) return inside;
     const artifact = settings.baselineArtifact;
     return artifact === null ? basename2(path) : `artifact ${artifact}: ${basename2(path)}`;
   };
@@ -50619,14 +51339,16 @@ async function runReview(deps) {
   await io.appendSummary(body);
   const files = await writeReportFiles(
     join5(settings.tempDir, `fitgap-${settings.commentKey}`, "report"),
-    review,
-    pr === null ? null : {
+    review
+  );
+  if (pr !== null) {
+    await writeBundle(files.dir, result.runs, {
       format: "fitgap-pull-request/1",
       repository: `${context3.repo.owner}/${context3.repo.repo}`,
       number: pr.number,
       headSha: pr.headSha
-    }
-  );
+    });
+  }
   setReviewOutputs(io, review, files.path, files.dir);
   const problems = [];
   if (pr !== null) {
@@ -50637,9 +51359,7 @@ async function runReview(deps) {
     const problem = await gateCheckStep(deps, settings.statusCheck, headSha, review, body);
     if (problem !== null) problems.push(problem);
   }
-  if (!review.gate.pass)
-    problems.unshift(`fitgap gate failed:
-${review.gate.reasons.map((r) => `- ${r}`).join("\n")}`);
+  if (!review.gate.pass) problems.unshift(gateFailure(review));
   if (problems.length > 0) io.setFailed(problems.join("\n"));
 }
 
@@ -50649,19 +51369,19 @@ function optional(name) {
   const value = getInput(name);
   return value === "" ? null : value;
 }
-function required(name, issues2) {
+function required(name, issues) {
   try {
     return getInput(name, { required: true });
   } catch {
-    issues2.push({ file: `input "${name}"`, pointer: "", expected: "is required", got: '""' });
+    issues.push({ file: `input "${name}"`, pointer: "", expected: "is required", got: '""' });
     return "";
   }
 }
-function oneOf(name, allowed, issues2) {
-  const value = required(name, issues2);
+function oneOf(name, allowed, issues) {
+  const value = required(name, issues);
   if (value === "") return allowed[0];
   if (allowed.includes(value)) return value;
-  issues2.push({
+  issues.push({
     file: `input "${name}"`,
     pointer: "",
     expected: `must be one of ${allowed.join(", ")}`,
@@ -50669,29 +51389,64 @@ function oneOf(name, allowed, issues2) {
   });
   return allowed[0];
 }
-function number(name, issues2, min, max2) {
-  const text2 = optional(name);
-  if (text2 === null) return null;
-  const value = Number(text2);
-  if (!Number.isFinite(value) || value < min || value > max2) {
-    issues2.push({
-      file: `input "${name}"`,
+var FIELD = {
+  alpha: "alpha",
+  "min-effect": "minEffect",
+  "gap-tolerance": "gapTolerance",
+  reference: "reference"
+};
+function overrideInputs(issues) {
+  const out = {};
+  for (const name of Object.keys(FIELD)) {
+    const text2 = optional(name);
+    if (text2 === null) continue;
+    const parsed = parseNumberSetting(name, text2, { file: `input "${name}"`, pointer: "" });
+    if ("issues" in parsed) issues.push(...parsed.issues);
+    else out[FIELD[name]] = parsed.value;
+  }
+  const failOn = optional("fail-on");
+  if (failOn !== null) {
+    const parsed = parseFailOn(failOn, { file: 'input "fail-on"', pointer: "" });
+    if ("issues" in parsed) issues.push(...parsed.issues);
+    else out.failOn = parsed.value;
+  }
+  return out;
+}
+function limitInputs(issues) {
+  const out = {};
+  for (const key of Object.keys(LIMIT_NAMES)) {
+    const name = LIMIT_NAMES[key].option;
+    const text2 = optional(name);
+    if (text2 === null) continue;
+    const parsed = parseLimitMb(key, text2, `input "${name}"`);
+    if ("issues" in parsed) issues.push(...parsed.issues);
+    else out[key] = parsed.bytes;
+  }
+  return out;
+}
+function archiveLimit(issues) {
+  const text2 = optional("archive-limit-mb");
+  if (text2 === null) return 50 * 1024 * 1024;
+  const value = /^\s*(?:\d+(?:\.\d*)?|\.\d+)\s*$/.test(text2) ? Number(text2) : Number.NaN;
+  if (!(value >= 1e-3 && value <= 2048)) {
+    issues.push({
+      file: 'input "archive-limit-mb"',
       pointer: "",
-      expected: `must be a number from ${min} to ${max2}`,
+      expected: "must be a number of MB from 0.001 to 2048",
       got: quote(text2)
     });
-    return null;
+    return 50 * 1024 * 1024;
   }
-  return value;
+  return Math.round(value * 1024 * 1024);
 }
 function readSettings(env = process.env) {
-  const issues2 = [];
-  const mode = oneOf("mode", ["review", "publish"], issues2);
-  const candidate = mode === "review" ? required("candidate", issues2) : optional("candidate");
+  const issues = [];
+  const mode = oneOf("mode", ["review", "publish"], issues);
+  const candidate = mode === "review" ? required("candidate", issues) : optional("candidate");
   const baseline = optional("baseline");
   const baselineArtifact = optional("baseline-artifact");
   if (mode === "review" && baseline === null === (baselineArtifact === null)) {
-    issues2.push({
+    issues.push({
       file: 'inputs "baseline" and "baseline-artifact"',
       pointer: "",
       expected: "need exactly one of them",
@@ -50701,40 +51456,47 @@ function readSettings(env = process.env) {
   }
   const commentKey = getInput("comment-key") || "default";
   if (!isValidCommentKey(commentKey)) {
-    issues2.push({
+    issues.push({
       file: 'input "comment-key"',
       pointer: "",
       expected: "must be 1-64 letters, digits, '.', '_' or '-'",
       got: quote(commentKey)
     });
   }
-  const failOnText = optional("fail-on");
-  const failOn = failOnText === null ? null : failOnText.split(/[\s,]+/).map((s) => s.trim()).filter((s) => s !== "");
-  issues2.push(...failOnIssues(failOn ?? [], 'input "fail-on"', ""));
-  const limitMb = number("archive-limit-mb", issues2, 1e-3, 2048) ?? 50;
+  const baselineWorkflow = optional("baseline-workflow");
+  if (mode === "publish" && baselineArtifact !== null && baselineWorkflow === null) {
+    issues.push({
+      file: 'input "baseline-workflow"',
+      pointer: "",
+      expected: 'is needed with "baseline-artifact" in publish mode',
+      hint: "Name the workflow file (e.g. train.yml) whose runs on the base branch upload the baseline."
+    });
+  }
+  const overrides = overrideInputs(issues);
+  const limits = limitInputs(issues);
+  const archiveLimitBytes = archiveLimit(issues);
   const settings = {
     mode,
     candidate,
     baseline,
     baselineArtifact,
     baselineRef: optional("baseline-ref"),
-    baselineWorkflow: optional("baseline-workflow"),
+    baselineWorkflow,
     config: optional("config"),
-    comment: oneOf("comment", ["update", "new", "off"], issues2),
+    comment: oneOf("comment", ["update", "new", "off"], issues),
     commentKey,
-    failOn,
-    alpha: number("alpha", issues2, Number.MIN_VALUE, 0.5),
-    minEffect: number("min-effect", issues2, 0, Number.MAX_VALUE),
+    overrides,
+    limits,
     statusCheck: oneOf(
       "status-check",
       ["auto", "check-run", "commit-status", "off"],
-      issues2
+      issues
     ),
     reportArtifact: getInput("report-artifact") || "fitgap-report",
-    archiveLimitBytes: Math.round(limitMb * 1024 * 1024),
+    archiveLimitBytes,
     api: {
       baseUrl: (env["GITHUB_API_URL"] ?? "https://api.github.com").replace(/\/+$/, ""),
-      token: required("github-token", issues2),
+      token: required("github-token", issues),
       retries: 2,
       delayUnitMs: testDelayUnit(env)
     },
@@ -50742,7 +51504,7 @@ function readSettings(env = process.env) {
     workspace: env["GITHUB_WORKSPACE"] ?? process.cwd(),
     workflowRef: env["GITHUB_WORKFLOW_REF"] ?? null
   };
-  if (issues2.length > 0) throw new InputError(issues2);
+  if (issues.length > 0) throw new InputError(issues);
   return settings;
 }
 function testDelayUnit(env) {
@@ -51150,15 +51912,15 @@ function buildRunContext(ctx) {
   const pr = record(payload["pull_request"]);
   const head = record(pr?.["head"]);
   const base = record(pr?.["base"]);
-  const number2 = pr?.["number"];
+  const number = pr?.["number"];
   const run = record(payload["workflow_run"]);
   return {
     repo: ctx.repo,
     eventName: ctx.eventName,
     sha: ctx.sha,
     runId: ctx.runId,
-    pullRequest: pr !== null && typeof number2 === "number" ? {
-      number: number2,
+    pullRequest: pr !== null && typeof number === "number" ? {
+      number,
       headSha: text(head?.["sha"]) ?? ctx.sha,
       baseRef: text(base?.["ref"]) ?? "",
       headRepo: fullName(head?.["repo"])

@@ -130,7 +130,9 @@ export async function loadRun(path: string, options: LoadRunOptions = {}): Promi
     // Checked now, so a missing or refused file is reported with the artifact's other problems.
     const first = await openChecked(target).catch((error: unknown) => {
       if (error instanceof MissingFileError)
-        throw new InputError([{ ...issue, expected: 'must name an existing file next to the artifact' }]);
+        throw new InputError([
+          { ...issue, expected: 'must name an existing file next to the artifact' },
+        ]);
       throw error;
     });
     await first.handle.close();

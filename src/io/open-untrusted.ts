@@ -362,7 +362,10 @@ export function decodeUtf8(bytes: Uint8Array, file: string, what: string): strin
       pointer: `line ${line}`,
       expected: `must be UTF-8 text (${what})`,
       got: 'an invalid UTF-8 sequence',
-      hint: 'Save the file as UTF-8.',
+      hint:
+        (bytes[0] === 0xff && bytes[1] === 0xfe) || (bytes[0] === 0xfe && bytes[1] === 0xff)
+          ? 'The file looks like UTF-16; save it as UTF-8.'
+          : 'Save the file as UTF-8.',
     },
   ]);
 }

@@ -1,7 +1,7 @@
 /**
  * End-to-end runs of the built CLI (dist/cli.js) as a child process, as a user would run it.
  */
-import { execFile } from 'node:child_process';
+import { execFile, spawn } from 'node:child_process';
 import { existsSync, mkdtempSync, readFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
@@ -118,12 +118,38 @@ describe('fitgap CLI (built)', () => {
     const ok = await fitgap(['validate', 'test/fixtures/design/example.json', 'demo/fitgap.yml']);
     expect(ok.code).toBe(0);
     expect(ok.stdout).toContain(
-      'test/fixtures/design/example.json: valid run artifact "poly-degree-3" (3 repeat(s))',
+      'test/fixtures/design/example.json: valid run artifact "poly-degree-3" (3 repeat(s), predictions checked)',
     );
     const bad = await fitgap(['validate', 'test/fixtures/bad/bad-goal.json']);
     expect(bad.code).toBe(2);
     expect(bad.stderr).toBe(
       'test/fixtures/bad/bad-goal.json: /metric/goal must be one of "minimize", "maximize" (got "lower").\n',
     );
+  });
+
+  it("a reader that goes away (| head) ends the CLI quietly, with the review's own exit code", async () => {
+    for (const [failOn, expected] of [
+      ['none', 0],
+      ['any-movement', 1],
+    ] as const) {
+      const child = spawn(process.execPath, [
+        cli,
+        'review',
+        '--baseline',
+        'test/fixtures/design/example.json',
+        '--candidate',
+        'test/fixtures/design/candidate/example.json',
+        '--format',
+        'markdown',
+        '--fail-on',
+        failOn,
+      ]);
+      child.stdout.destroy(); // the reader is gone before the first byte: EPIPE
+      let stderr = '';
+      child.stderr.on('data', (chunk: Buffer) => (stderr += chunk.toString()));
+      const code = await new Promise<number | null>((done) => child.on('close', done));
+      expect(stderr).toBe('');
+      expect(code).toBe(expected);
+    }
   });
 });
