@@ -141,7 +141,8 @@ describe('corrupt archives', () => {
     });
     for (let seed = 0; seed < 300; seed++) {
       const broken = zip.slice();
-      broken[(seed * 7919) % broken.length] ^= 1 + (seed % 255);
+      const at = (seed * 7919) % broken.length;
+      broken[at] = (broken[at] ?? 0) ^ (1 + (seed % 255));
       try {
         for (const entry of listEntries(broken, label))
           readEntry(broken, entry, { remaining: 1e6, limit: 1e6 }, label);

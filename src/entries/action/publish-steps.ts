@@ -6,6 +6,7 @@ import type { Review } from '../../model/review.js';
 import { publishGate } from '../../io/github/check.js';
 import type { GitHubClient } from '../../io/github/client.js';
 import { publishComment } from '../../io/github/comment.js';
+import { resolveIdentity } from '../../io/github/identity.js';
 import type { RunContext } from '../../io/github/context.js';
 import { describeRequestError, isRequestError } from './failure.js';
 import type { ActionIO } from './io.js';
@@ -50,9 +51,12 @@ export async function commentStep(
   const { settings, context, octokit, io } = deps;
   if (settings.comment === 'off') return null;
   try {
+    const identity =
+      settings.comment === 'update' ? await resolveIdentity(octokit, settings.api.token) : undefined;
     const outcome = await publishComment({
       octokit,
       repo: context.repo,
+      ...(identity === undefined ? {} : { identity }),
       pullNumber: target.pullNumber,
       headSha: target.headSha,
       key: settings.commentKey,

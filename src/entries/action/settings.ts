@@ -27,6 +27,8 @@ export interface ApiSettings {
    * 1000 in production; tests shrink it through `FITGAP_TEST_DELAY_UNIT_MS` (test-only).
    */
   delayUnitMs: number;
+  /** Milliseconds a request may take (30 s; tests shrink it through `FITGAP_TEST_TIMEOUT_MS`). */
+  timeoutMs: number;
 }
 
 export interface Settings {
@@ -208,7 +210,8 @@ export function readSettings(env: Env = process.env): Settings {
       baseUrl: (env['GITHUB_API_URL'] ?? 'https://api.github.com').replace(/\/+$/, ''),
       token: required('github-token', issues),
       retries: 2,
-      delayUnitMs: testDelayUnit(env),
+      delayUnitMs: testNumber(env, 'FITGAP_TEST_DELAY_UNIT_MS', 1000),
+      timeoutMs: testNumber(env, 'FITGAP_TEST_TIMEOUT_MS', 30_000),
     },
     tempDir: env['RUNNER_TEMP'] ?? tmpdir(),
     workspace: env['GITHUB_WORKSPACE'] ?? process.cwd(),
@@ -218,9 +221,12 @@ export function readSettings(env: Env = process.env): Settings {
   return settings;
 }
 
-/** Test-only: `FITGAP_TEST_DELAY_UNIT_MS` shrinks retry and rate-limit waits so tests stay fast. */
-function testDelayUnit(env: Env): number {
-  const text = env['FITGAP_TEST_DELAY_UNIT_MS'];
+/**
+ * Test-only knobs: `FITGAP_TEST_DELAY_UNIT_MS` shrinks retry and rate-limit waits,
+ * `FITGAP_TEST_TIMEOUT_MS` the request timeout, so tests stay fast.
+ */
+function testNumber(env: Env, name: string, otherwise: number): number {
+  const text = env[name];
   const value = text === undefined ? NaN : Number(text);
-  return Number.isFinite(value) && value >= 0 ? value : 1000;
+  return Number.isFinite(value) && value > 0 ? value : otherwise;
 }
