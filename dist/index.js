@@ -45340,7 +45340,10 @@ function isRequestError(error2) {
 }
 function describeRequestError(error2) {
   const path = new URL(error2.request.url, "http://api.invalid").pathname;
-  return `GitHub API ${error2.request.method} ${path} answered ${error2.status}: ${error2.message}`;
+  const call = `GitHub API ${error2.request.method} ${path}`;
+  if (error2.response === void 0) return `${call} could not be reached: ${error2.message}`;
+  const hint = error2.status === 401 ? ' (check the token given as "github-token")' : error2.status === 404 ? " (check the repository, the number, and that the token may see them)" : "";
+  return `${call} answered ${error2.status}: ${error2.message}${hint}`;
 }
 function failureMessage(error2) {
   if (error2 instanceof InputError || error2 instanceof UsageError) {
@@ -50982,35 +50985,52 @@ async function publishComment(options) {
   const body = fitBody(withMarker(options.body, key, options.headSha), options);
   const currentHead = options.currentHead ?? (await octokit.rest.pulls.get({ ...repo, pull_number: pullNumber })).data.head.sha;
   if (currentHead !== options.headSha) return { action: "stale", currentHead };
-  if (options.mode === "new") {
+  const create = () => shrinkOn422(options, body, async (text2) => {
     const { data: data2 } = await octokit.rest.issues.createComment({
       ...repo,
       issue_number: pullNumber,
-      body
+      body: text2
     });
+    return data2;
+  });
+  if (options.mode === "new") {
+    const data2 = await create();
     return { action: "created", id: data2.id, url: data2.html_url };
   }
-  const ours = await listOurComments(options, null);
+  const identity = options.identity ?? { kind: "bot" };
+  const ours = await listOurComments(options, identity);
   const [target, ...duplicates] = ours;
-  if (target === void 0) {
-    const { data: created } = await octokit.rest.issues.createComment({
-      ...repo,
-      issue_number: pullNumber,
-      body
-    });
-    return dedupeAfterCreate(options, body, created);
-  }
+  if (target === void 0) return dedupeAfterCreate(options, body, await create());
   await deleteComments(options, duplicates);
   if (target.body === body) return { action: "unchanged", id: target.id, url: target.html_url };
-  const { data } = await octokit.rest.issues.updateComment({
-    ...repo,
-    comment_id: target.id,
-    body
-  });
+  const data = await update(options, target.id, body);
   return { action: "updated", id: data.id, url: data.html_url };
 }
+function update(options, id, body) {
+  return shrinkOn422(options, body, async (text2) => {
+    const { data } = await options.octokit.rest.issues.updateComment({
+      ...options.repo,
+      comment_id: id,
+      body: text2
+    });
+    return data;
+  });
+}
+async function shrinkOn422(options, body, send) {
+  try {
+    return await send(body);
+  } catch (error2) {
+    const status = error2?.status;
+    const pointer = pointerBody(options, body.length);
+    if (status !== 422 || body === pointer) throw error2;
+    return send(pointer);
+  }
+}
 async function dedupeAfterCreate(options, body, created) {
-  const ours = await listOurComments(options, created.user?.login ?? null);
+  const ours = await listOurComments(
+    options,
+    created.user === null ? options.identity ?? { kind: "bot" } : { kind: "user", login: created.user.login }
+  );
   const [oldest, ...later] = ours;
   if (oldest === void 0 || oldest.id === created.id) {
     await deleteComments(options, later);
@@ -51018,14 +51038,10 @@ async function dedupeAfterCreate(options, body, created) {
   }
   await deleteComments(options, later);
   if (oldest.body === body) return { action: "unchanged", id: oldest.id, url: oldest.html_url };
-  const { data } = await options.octokit.rest.issues.updateComment({
-    ...options.repo,
-    comment_id: oldest.id,
-    body
-  });
+  const data = await update(options, oldest.id, body);
   return { action: "updated", id: data.id, url: data.html_url };
 }
-async function listOurComments(options, login) {
+async function listOurComments(options, identity) {
   const ours = [];
   const pages = options.octokit.paginate.iterator(options.octokit.rest.issues.listComments, {
     ...options.repo,
@@ -51034,14 +51050,15 @@ async function listOurComments(options, login) {
   });
   for await (const page of pages) {
     for (const comment of page.data) {
-      if (isOurs(comment, options.key, login)) ours.push(comment);
+      if (isOurs(comment, options.key, identity)) ours.push(comment);
     }
   }
   return ours.sort((a, b) => a.created_at.localeCompare(b.created_at) || a.id - b.id);
 }
-function isOurs(comment, key, login = null) {
-  if (comment.user?.type !== "Bot") return false;
-  if (login !== null && comment.user.login !== login) return false;
+function isOurs(comment, key, identity = { kind: "bot" }) {
+  const user = comment.user;
+  if (user === null) return false;
+  if (identity.kind === "user" ? user.login !== identity.login : user.type !== "Bot") return false;
   return parseMarker(comment.body ?? "")?.key === key;
 }
 async function deleteComments(options, comments) {
@@ -51054,11 +51071,27 @@ function withMarker(body, key, headSha) {
 ${body}`;
 }
 function fitBody(body, options) {
-  if (body.length <= MAX_COMMENT_CHARS) return body;
+  return body.length <= MAX_COMMENT_CHARS ? body : pointerBody(options, body.length);
+}
+function pointerBody(options, length) {
   const where = options.runUrl === void 0 ? "the job summary" : `the [job summary](${options.runUrl})`;
   return `${buildMarker({ key: options.key, head: options.headSha })}
-fitgap's review is ${body.length} characters long, more than a comment can hold (${MAX_COMMENT_CHARS}). Read it in ${where}.
+fitgap's review is ${length} characters long, more than a comment can hold (${MAX_COMMENT_CHARS}). Read it in ${where}.
 `;
+}
+
+// src/io/github/identity.ts
+var INSTALLATION_TOKEN = /^ghs_/;
+async function resolveIdentity(octokit, token) {
+  if (INSTALLATION_TOKEN.test(token)) return { kind: "bot" };
+  try {
+    const { data } = await octokit.rest.users.getAuthenticated();
+    return data.type === "Bot" ? { kind: "bot" } : { kind: "user", login: data.login };
+  } catch (error2) {
+    const status = error2?.status;
+    if (status === 403 || status === 404) return { kind: "bot" };
+    throw error2;
+  }
 }
 
 // src/entries/action/publish-steps.ts
@@ -51081,9 +51114,11 @@ async function commentStep(deps, target, body) {
   const { settings, context: context3, octokit, io } = deps;
   if (settings.comment === "off") return null;
   try {
+    const identity = settings.comment === "update" ? await resolveIdentity(octokit, settings.api.token) : void 0;
     const outcome = await publishComment({
       octokit,
       repo: context3.repo,
+      ...identity === void 0 ? {} : { identity },
       pullNumber: target.pullNumber,
       headSha: target.headSha,
       key: settings.commentKey,
@@ -51498,7 +51533,8 @@ function readSettings(env = process.env) {
       baseUrl: (env["GITHUB_API_URL"] ?? "https://api.github.com").replace(/\/+$/, ""),
       token: required("github-token", issues),
       retries: 2,
-      delayUnitMs: testDelayUnit(env)
+      delayUnitMs: testNumber(env, "FITGAP_TEST_DELAY_UNIT_MS", 1e3),
+      timeoutMs: testNumber(env, "FITGAP_TEST_TIMEOUT_MS", 3e4)
     },
     tempDir: env["RUNNER_TEMP"] ?? tmpdir(),
     workspace: env["GITHUB_WORKSPACE"] ?? process.cwd(),
@@ -51507,10 +51543,10 @@ function readSettings(env = process.env) {
   if (issues.length > 0) throw new InputError(issues);
   return settings;
 }
-function testDelayUnit(env) {
-  const text2 = env["FITGAP_TEST_DELAY_UNIT_MS"];
+function testNumber(env, name, otherwise) {
+  const text2 = env[name];
   const value = text2 === void 0 ? NaN : Number(text2);
-  return Number.isFinite(value) && value >= 0 ? value : 1e3;
+  return Number.isFinite(value) && value > 0 ? value : otherwise;
 }
 
 // node_modules/@octokit/rest/dist-src/index.js
@@ -51864,6 +51900,21 @@ throttling.triggersNotification = triggersNotification;
 
 // src/io/github/client.ts
 var Client = Octokit2.plugin(retry, throttling);
+function fetchWithTimeout(base, ms) {
+  return async (input, init) => {
+    const timeout = AbortSignal.timeout(ms);
+    const signal = init?.signal ? AbortSignal.any([init.signal, timeout]) : timeout;
+    try {
+      return await base(input, { ...init, signal });
+    } catch (error2) {
+      if (timeout.aborted)
+        throw new TypeError("fetch failed", {
+          cause: new Error(`no answer within ${Math.round(ms / 100) / 10} s (timed out)`)
+        });
+      throw error2;
+    }
+  };
+}
 function createClient(options) {
   const limitRetries = options.rateLimitRetries ?? 2;
   const maxWait = options.maxRateLimitWaitS ?? 120;
@@ -51879,7 +51930,9 @@ function createClient(options) {
     baseUrl: options.baseUrl,
     auth: options.token,
     userAgent: "fitgap-action",
-    request: options.fetch === void 0 ? {} : { fetch: options.fetch },
+    request: {
+      fetch: fetchWithTimeout(options.fetch ?? globalThis.fetch, options.timeoutMs ?? 3e4)
+    },
     // 429 is left to the throttling plugin, which honours retry-after.
     retry: {
       retries: options.retries,
