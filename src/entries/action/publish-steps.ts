@@ -52,7 +52,9 @@ export async function commentStep(
   if (settings.comment === 'off') return null;
   try {
     const identity =
-      settings.comment === 'update' ? await resolveIdentity(octokit, settings.api.token) : undefined;
+      settings.comment === 'update'
+        ? await resolveIdentity(octokit, settings.api.token)
+        : undefined;
     const outcome = await publishComment({
       octokit,
       repo: context.repo,

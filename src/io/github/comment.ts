@@ -117,7 +117,9 @@ async function dedupeAfterCreate(
   // Once our comment exists its author is known: only that author's comments count now.
   const ours = await listOurComments(
     options,
-    created.user === null ? (options.identity ?? { kind: 'bot' }) : { kind: 'user', login: created.user.login },
+    created.user === null
+      ? (options.identity ?? { kind: 'bot' })
+      : { kind: 'user', login: created.user.login },
   );
   const [oldest, ...later] = ours;
   if (oldest === undefined || oldest.id === created.id) {
