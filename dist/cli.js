@@ -19323,7 +19323,7 @@ import { lstat } from "node:fs/promises";
 import { dirname as dirname2, relative as relative2, resolve as resolve2, sep } from "node:path";
 
 // src/model/limits.ts
-var MAX_MAGNITUDE = 1e308;
+var MAX_MAGNITUDE = 1e15;
 var MAX_CURVE_POINTS = 1e4;
 var MAX_JSON_DEPTH = 64;
 function formatLimit(value) {

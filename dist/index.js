@@ -46040,7 +46040,7 @@ import { pipeline } from "node:stream/promises";
 import { join } from "node:path";
 
 // src/model/limits.ts
-var MAX_MAGNITUDE = 1e308;
+var MAX_MAGNITUDE = 1e15;
 var MAX_CURVE_POINTS = 1e4;
 var MAX_JSON_DEPTH = 64;
 function formatLimit(value) {

@@ -16,8 +16,10 @@ import { bakeryReview } from '../fixtures/report/bakery.js';
 import { deliveryReview } from '../fixtures/report/delivery.js';
 import { mermaidBlocks, toHtml } from '../report/gfm.js';
 
-const CHROMIUM = '/usr/bin/chromium';
+const CHROMIUM = process.env['FITGAP_CHROMIUM'] ?? '/usr/bin/chromium';
 const hasBrowser = existsSync(CHROMIUM);
+/** In CI the browser is required (.ci/run installs it): its absence fails, never skips. */
+const required = process.env['CI'] === 'true';
 const mermaidBundle = join(
   dirname(createRequire(import.meta.url).resolve('mermaid/package.json')),
   'dist/mermaid.min.js',
@@ -32,6 +34,12 @@ const STYLE = `
 `;
 
 describe('comment in a real browser', () => {
+  it.runIf(required && !hasBrowser)('fails in CI when there is no browser to render with', () => {
+    expect.fail(
+      `no browser at ${CHROMIUM}; CI must have one (install it with: apt-get install -y chromium)`,
+    );
+  });
+
   it.skipIf(!hasBrowser)(
     hasBrowser
       ? 'renders every Mermaid chart to an SVG and saves test-output/comment.png'
