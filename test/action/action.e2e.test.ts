@@ -566,13 +566,25 @@ describe.concurrent(
       forged.gate = { pass: true, reasons: [], failOn: [] };
       forged.levers = [{ id: '__proto__', reason: '<img src=x onerror=alert(1)> @octocat' }];
       files['review.json'] = new TextEncoder().encode(JSON.stringify(forged));
+      // The runs themselves carry hostile names; the renderer escapes every artifact string.
+      const hostile = '<img src=x onerror=alert(1)> @octocat [x](https://evil.invalid) | </table>';
+      for (const side of ['baseline', 'candidate']) {
+        const text = new TextDecoder().decode(files[`${side}/run.json`]);
+        const doc = JSON.parse(text) as Record<string, unknown>;
+        doc['slices'] = [{ name: hostile, examples: 500, train: 0.05, validation: 0.1 }];
+        doc['hyperparameters'] = { ...(doc['hyperparameters'] as object), [hostile]: side };
+        doc['run'] = { ...(doc['run'] as object), name: hostile };
+        files[`${side}/run.json`] = new TextEncoder().encode(JSON.stringify(doc));
+      }
       const { fake: trusted, repo } = await forkSetup(context, files);
       const run = await publish(trusted);
       sane(expect, trusted, run);
       expect(repo.checkRuns[0]).toMatchObject({ conclusion: 'failure' });
       expect(run.outputs['validation-change']).toBe('worse');
-      expect(repo.comments[0]?.body).not.toContain('<img');
-      expect(repo.comments[0]?.body).not.toContain('@octocat');
+      const body = repo.comments[0]?.body ?? '';
+      expect(body).toContain('onerror'); // the name is shown, as text
+      for (const live of ['<img', '</table>', '@octocat', '](https://evil', '__proto__'])
+        expect(body).not.toContain(live);
     });
 
     test("the gate policy is the publish side's: its config and inputs, never the upload's", async (context) => {
