@@ -84,10 +84,10 @@ var require_code = __commonJS({
       }
       get names() {
         var _a;
-        return (_a = this._names) !== null && _a !== void 0 ? _a : this._names = this._items.reduce((names, c) => {
+        return (_a = this._names) !== null && _a !== void 0 ? _a : this._names = this._items.reduce((names2, c) => {
           if (c instanceof Name)
-            names[c.str] = (names[c.str] || 0) + 1;
-          return names;
+            names2[c.str] = (names2[c.str] || 0) + 1;
+          return names2;
         }, {});
       }
     };
@@ -243,8 +243,8 @@ var require_scope = __commonJS({
         super(nameStr);
         this.prefix = prefix;
       }
-      setValue(value, { property, itemIndex }) {
-        this.value = value;
+      setValue(value2, { property, itemIndex }) {
+        this.value = value2;
         this.scopePath = (0, code_1._)`.${new code_1.Name(property)}[${itemIndex}]`;
       }
     };
@@ -263,13 +263,13 @@ var require_scope = __commonJS({
       name(prefix) {
         return new ValueScopeName(prefix, this._newName(prefix));
       }
-      value(nameOrPrefix, value) {
+      value(nameOrPrefix, value2) {
         var _a;
-        if (value.ref === void 0)
+        if (value2.ref === void 0)
           throw new Error("CodeGen: ref must be passed in value");
         const name = this.toName(nameOrPrefix);
         const { prefix } = name;
-        const valueKey = (_a = value.key) !== null && _a !== void 0 ? _a : value.ref;
+        const valueKey = (_a = value2.key) !== null && _a !== void 0 ? _a : value2.ref;
         let vs = this._values[prefix];
         if (vs) {
           const _name = vs.get(valueKey);
@@ -281,8 +281,8 @@ var require_scope = __commonJS({
         vs.set(valueKey, name);
         const s = this._scope[prefix] || (this._scope[prefix] = []);
         const itemIndex = s.length;
-        s[itemIndex] = value.ref;
-        name.setValue(value, { property: prefix, itemIndex });
+        s[itemIndex] = value2.ref;
+        name.setValue(value2, { property: prefix, itemIndex });
         return name;
       }
       getValue(prefix, keyOrRef) {
@@ -413,11 +413,11 @@ var require_codegen = __commonJS({
         const rhs = this.rhs === void 0 ? "" : ` = ${this.rhs}`;
         return `${varKind} ${this.name}${rhs};` + _n;
       }
-      optimizeNames(names, constants2) {
-        if (!names[this.name.str])
+      optimizeNames(names2, constants2) {
+        if (!names2[this.name.str])
           return;
         if (this.rhs)
-          this.rhs = optimizeExpr(this.rhs, names, constants2);
+          this.rhs = optimizeExpr(this.rhs, names2, constants2);
         return this;
       }
       get names() {
@@ -434,15 +434,15 @@ var require_codegen = __commonJS({
       render({ _n }) {
         return `${this.lhs} = ${this.rhs};` + _n;
       }
-      optimizeNames(names, constants2) {
-        if (this.lhs instanceof code_1.Name && !names[this.lhs.str] && !this.sideEffects)
+      optimizeNames(names2, constants2) {
+        if (this.lhs instanceof code_1.Name && !names2[this.lhs.str] && !this.sideEffects)
           return;
-        this.rhs = optimizeExpr(this.rhs, names, constants2);
+        this.rhs = optimizeExpr(this.rhs, names2, constants2);
         return this;
       }
       get names() {
-        const names = this.lhs instanceof code_1.Name ? {} : { ...this.lhs.names };
-        return addExprNames(names, this.rhs);
+        const names2 = this.lhs instanceof code_1.Name ? {} : { ...this.lhs.names };
+        return addExprNames(names2, this.rhs);
       }
     };
     var AssignOp = class extends Assign {
@@ -498,8 +498,8 @@ var require_codegen = __commonJS({
       optimizeNodes() {
         return `${this.code}` ? this : void 0;
       }
-      optimizeNames(names, constants2) {
-        this.code = optimizeExpr(this.code, names, constants2);
+      optimizeNames(names2, constants2) {
+        this.code = optimizeExpr(this.code, names2, constants2);
         return this;
       }
       get names() {
@@ -528,20 +528,20 @@ var require_codegen = __commonJS({
         }
         return nodes.length > 0 ? this : void 0;
       }
-      optimizeNames(names, constants2) {
+      optimizeNames(names2, constants2) {
         const { nodes } = this;
         let i = nodes.length;
         while (i--) {
           const n = nodes[i];
-          if (n.optimizeNames(names, constants2))
+          if (n.optimizeNames(names2, constants2))
             continue;
-          subtractNames(names, n.names);
+          subtractNames(names2, n.names);
           nodes.splice(i, 1);
         }
         return nodes.length > 0 ? this : void 0;
       }
       get names() {
-        return this.nodes.reduce((names, n) => addNames(names, n.names), {});
+        return this.nodes.reduce((names2, n) => addNames(names2, n.names), {});
       }
     };
     var BlockNode = class extends ParentNode {
@@ -586,20 +586,20 @@ var require_codegen = __commonJS({
           return void 0;
         return this;
       }
-      optimizeNames(names, constants2) {
+      optimizeNames(names2, constants2) {
         var _a;
-        this.else = (_a = this.else) === null || _a === void 0 ? void 0 : _a.optimizeNames(names, constants2);
-        if (!(super.optimizeNames(names, constants2) || this.else))
+        this.else = (_a = this.else) === null || _a === void 0 ? void 0 : _a.optimizeNames(names2, constants2);
+        if (!(super.optimizeNames(names2, constants2) || this.else))
           return;
-        this.condition = optimizeExpr(this.condition, names, constants2);
+        this.condition = optimizeExpr(this.condition, names2, constants2);
         return this;
       }
       get names() {
-        const names = super.names;
-        addExprNames(names, this.condition);
+        const names2 = super.names;
+        addExprNames(names2, this.condition);
         if (this.else)
-          addNames(names, this.else.names);
-        return names;
+          addNames(names2, this.else.names);
+        return names2;
       }
     };
     If.kind = "if";
@@ -614,10 +614,10 @@ var require_codegen = __commonJS({
       render(opts) {
         return `for(${this.iteration})` + super.render(opts);
       }
-      optimizeNames(names, constants2) {
-        if (!super.optimizeNames(names, constants2))
+      optimizeNames(names2, constants2) {
+        if (!super.optimizeNames(names2, constants2))
           return;
-        this.iteration = optimizeExpr(this.iteration, names, constants2);
+        this.iteration = optimizeExpr(this.iteration, names2, constants2);
         return this;
       }
       get names() {
@@ -638,8 +638,8 @@ var require_codegen = __commonJS({
         return `for(${varKind} ${name}=${from}; ${name}<${to}; ${name}++)` + super.render(opts);
       }
       get names() {
-        const names = addExprNames(super.names, this.from);
-        return addExprNames(names, this.to);
+        const names2 = addExprNames(super.names, this.from);
+        return addExprNames(names2, this.to);
       }
     };
     var ForIter = class extends For {
@@ -653,10 +653,10 @@ var require_codegen = __commonJS({
       render(opts) {
         return `for(${this.varKind} ${this.name} ${this.loop} ${this.iterable})` + super.render(opts);
       }
-      optimizeNames(names, constants2) {
-        if (!super.optimizeNames(names, constants2))
+      optimizeNames(names2, constants2) {
+        if (!super.optimizeNames(names2, constants2))
           return;
-        this.iterable = optimizeExpr(this.iterable, names, constants2);
+        this.iterable = optimizeExpr(this.iterable, names2, constants2);
         return this;
       }
       get names() {
@@ -698,20 +698,20 @@ var require_codegen = __commonJS({
         (_b = this.finally) === null || _b === void 0 ? void 0 : _b.optimizeNodes();
         return this;
       }
-      optimizeNames(names, constants2) {
+      optimizeNames(names2, constants2) {
         var _a, _b;
-        super.optimizeNames(names, constants2);
-        (_a = this.catch) === null || _a === void 0 ? void 0 : _a.optimizeNames(names, constants2);
-        (_b = this.finally) === null || _b === void 0 ? void 0 : _b.optimizeNames(names, constants2);
+        super.optimizeNames(names2, constants2);
+        (_a = this.catch) === null || _a === void 0 ? void 0 : _a.optimizeNames(names2, constants2);
+        (_b = this.finally) === null || _b === void 0 ? void 0 : _b.optimizeNames(names2, constants2);
         return this;
       }
       get names() {
-        const names = super.names;
+        const names2 = super.names;
         if (this.catch)
-          addNames(names, this.catch.names);
+          addNames(names2, this.catch.names);
         if (this.finally)
-          addNames(names, this.finally.names);
-        return names;
+          addNames(names2, this.finally.names);
+        return names2;
       }
     };
     var Catch = class extends BlockNode {
@@ -752,8 +752,8 @@ var require_codegen = __commonJS({
         return this._extScope.name(prefix);
       }
       // reserves unique name in the external scope and assigns value to it
-      scopeValue(prefixOrName, value) {
-        const name = this._extScope.value(prefixOrName, value);
+      scopeValue(prefixOrName, value2) {
+        const name = this._extScope.value(prefixOrName, value2);
         const vs = this._values[name.prefix] || (this._values[name.prefix] = /* @__PURE__ */ new Set());
         vs.add(name);
         return name;
@@ -807,13 +807,13 @@ var require_codegen = __commonJS({
       // returns code for object literal for the passed argument list of key-value pairs
       object(...keyValues) {
         const code = ["{"];
-        for (const [key, value] of keyValues) {
+        for (const [key, value2] of keyValues) {
           if (code.length > 1)
             code.push(",");
           code.push(key);
-          if (key !== value || this.opts.es5) {
+          if (key !== value2 || this.opts.es5) {
             code.push(":");
-            (0, code_1.addCodeArg)(code, value);
+            (0, code_1.addCodeArg)(code, value2);
           }
         }
         code.push("}");
@@ -892,10 +892,10 @@ var require_codegen = __commonJS({
         return this._leafNode(new Break(label));
       }
       // `return` statement
-      return(value) {
+      return(value2) {
         const node = new Return();
         this._blockNode(node);
-        this.code(value);
+        this.code(value2);
         if (node.nodes.length !== 1)
           throw new Error('CodeGen: "return" should have one node');
         return this._endBlockNode(Return);
@@ -995,15 +995,15 @@ var require_codegen = __commonJS({
       }
     };
     exports.CodeGen = CodeGen;
-    function addNames(names, from) {
+    function addNames(names2, from) {
       for (const n in from)
-        names[n] = (names[n] || 0) + (from[n] || 0);
-      return names;
+        names2[n] = (names2[n] || 0) + (from[n] || 0);
+      return names2;
     }
-    function addExprNames(names, from) {
-      return from instanceof code_1._CodeOrName ? addNames(names, from.names) : names;
+    function addExprNames(names2, from) {
+      return from instanceof code_1._CodeOrName ? addNames(names2, from.names) : names2;
     }
-    function optimizeExpr(expr, names, constants2) {
+    function optimizeExpr(expr, names2, constants2) {
       if (expr instanceof code_1.Name)
         return replaceName(expr);
       if (!canOptimize(expr))
@@ -1019,18 +1019,18 @@ var require_codegen = __commonJS({
       }, []));
       function replaceName(n) {
         const c = constants2[n.str];
-        if (c === void 0 || names[n.str] !== 1)
+        if (c === void 0 || names2[n.str] !== 1)
           return n;
-        delete names[n.str];
+        delete names2[n.str];
         return c;
       }
       function canOptimize(e) {
-        return e instanceof code_1._Code && e._items.some((c) => c instanceof code_1.Name && names[c.str] === 1 && constants2[c.str] !== void 0);
+        return e instanceof code_1._Code && e._items.some((c) => c instanceof code_1.Name && names2[c.str] === 1 && constants2[c.str] !== void 0);
       }
     }
-    function subtractNames(names, from) {
+    function subtractNames(names2, from) {
       for (const n in from)
-        names[n] = (names[n] || 0) - (from[n] || 0);
+        names2[n] = (names2[n] || 0) - (from[n] || 0);
     }
     function not(x) {
       return typeof x == "boolean" || typeof x == "number" || x === null ? !x : (0, code_1._)`!${par(x)}`;
@@ -1228,7 +1228,7 @@ var require_names = __commonJS({
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var codegen_1 = require_codegen();
-    var names = {
+    var names2 = {
       // validation function arguments
       data: new codegen_1.Name("data"),
       // data passed to validation function
@@ -1257,7 +1257,7 @@ var require_names = __commonJS({
       jsonLen: new codegen_1.Name("jsonLen"),
       jsonPart: new codegen_1.Name("jsonPart")
     };
-    exports.default = names;
+    exports.default = names2;
   }
 });
 
@@ -1447,15 +1447,15 @@ var require_rules = __commonJS({
     }
     exports.isJSONType = isJSONType;
     function getRules() {
-      const groups = {
+      const groups2 = {
         number: { type: "number", rules: [] },
         string: { type: "string", rules: [] },
         array: { type: "array", rules: [] },
         object: { type: "object", rules: [] }
       };
       return {
-        types: { ...groups, integer: true, boolean: true, null: true },
-        rules: [{ rules: [] }, groups.number, groups.string, groups.array, groups.object],
+        types: { ...groups2, integer: true, boolean: true, null: true },
+        rules: [{ rules: [] }, groups2.number, groups2.string, groups2.array, groups2.object],
         post: { rules: [] },
         all: {},
         keywords: {}
@@ -2987,7 +2987,7 @@ var require_compile = __commonJS({
       const schOrFunc = root.refs[ref];
       if (schOrFunc)
         return schOrFunc;
-      let _sch = resolve6.call(this, root, ref);
+      let _sch = resolve7.call(this, root, ref);
       if (_sch === void 0) {
         const schema = (_a = root.localRefs) === null || _a === void 0 ? void 0 : _a[ref];
         const { schemaId } = this.opts;
@@ -3014,7 +3014,7 @@ var require_compile = __commonJS({
     function sameSchemaEnv(s1, s2) {
       return s1.schema === s2.schema && s1.root === s2.root && s1.baseId === s2.baseId;
     }
-    function resolve6(root, ref) {
+    function resolve7(root, ref) {
       let sch;
       while (typeof (sch = this.refs[ref]) == "string")
         ref = sch;
@@ -3878,7 +3878,7 @@ var require_fast_uri = __commonJS({
       }
       return uri;
     }
-    function resolve6(baseURI, relativeURI, options) {
+    function resolve7(baseURI, relativeURI, options) {
       const schemelessOptions = options ? Object.assign({ scheme: "null" }, options) : { scheme: "null" };
       const {
         parsed: baseParsed,
@@ -3914,50 +3914,50 @@ var require_fast_uri = __commonJS({
       schemelessOptions.skipEscape = true;
       return serialize2(resolved, schemelessOptions);
     }
-    function resolveComponent(base, relative3, options, skipNormalization) {
+    function resolveComponent(base, relative4, options, skipNormalization) {
       const target = {};
       if (!skipNormalization) {
         base = parse(serialize2(base, options), options);
-        relative3 = parse(serialize2(relative3, options), options);
+        relative4 = parse(serialize2(relative4, options), options);
       }
       options = options || {};
-      if (!options.tolerant && relative3.scheme) {
-        target.scheme = relative3.scheme;
-        target.userinfo = relative3.userinfo;
-        target.host = relative3.host;
-        target.port = relative3.port;
-        target.path = removeDotSegments(relative3.path || "");
-        target.query = relative3.query;
+      if (!options.tolerant && relative4.scheme) {
+        target.scheme = relative4.scheme;
+        target.userinfo = relative4.userinfo;
+        target.host = relative4.host;
+        target.port = relative4.port;
+        target.path = removeDotSegments(relative4.path || "");
+        target.query = relative4.query;
       } else {
-        if (relative3.userinfo !== void 0 || relative3.host !== void 0 || relative3.port !== void 0) {
-          target.userinfo = relative3.userinfo;
-          target.host = relative3.host;
-          target.port = relative3.port;
-          target.path = removeDotSegments(relative3.path || "");
-          target.query = relative3.query;
+        if (relative4.userinfo !== void 0 || relative4.host !== void 0 || relative4.port !== void 0) {
+          target.userinfo = relative4.userinfo;
+          target.host = relative4.host;
+          target.port = relative4.port;
+          target.path = removeDotSegments(relative4.path || "");
+          target.query = relative4.query;
         } else {
-          if (!relative3.path) {
+          if (!relative4.path) {
             target.path = base.path;
-            if (relative3.query !== void 0) {
-              target.query = relative3.query;
+            if (relative4.query !== void 0) {
+              target.query = relative4.query;
             } else {
               target.query = base.query;
             }
           } else {
-            if (relative3.path[0] === "/") {
-              target.path = removeDotSegments(relative3.path);
+            if (relative4.path[0] === "/") {
+              target.path = removeDotSegments(relative4.path);
             } else {
               const baseHasAuthority = base.userinfo !== void 0 || base.host !== void 0 || base.port !== void 0;
               if (baseHasAuthority && !base.path) {
-                target.path = "/" + relative3.path;
+                target.path = "/" + relative4.path;
               } else if (!base.path) {
-                target.path = relative3.path;
+                target.path = relative4.path;
               } else {
-                target.path = base.path.slice(0, base.path.lastIndexOf("/") + 1) + relative3.path;
+                target.path = base.path.slice(0, base.path.lastIndexOf("/") + 1) + relative4.path;
               }
               target.path = base.scheme === void 0 && !baseHasAuthority && target.path[0] !== "/" ? removeDotSegmentsRelative(target.path) : removeDotSegments(target.path);
             }
-            target.query = relative3.query;
+            target.query = relative4.query;
           }
           target.userinfo = base.userinfo;
           target.host = base.host;
@@ -3965,7 +3965,7 @@ var require_fast_uri = __commonJS({
         }
         target.scheme = base.scheme;
       }
-      target.fragment = relative3.fragment;
+      target.fragment = relative4.fragment;
       return target;
     }
     function equal(uriA, uriB, options) {
@@ -4257,19 +4257,19 @@ var require_fast_uri = __commonJS({
       if (typeof uri !== "string" && typeof uri !== "object") {
         return void 0;
       }
-      let value;
+      let value2;
       try {
-        value = typeof uri === "string" ? uri : serialize2(uri, opts);
+        value2 = typeof uri === "string" ? uri : serialize2(uri, opts);
       } catch {
         return void 0;
       }
-      const { normalized, malformedAuthorityOrPort, malformedPercentEncoding, malformedSchemeSpecific, malformedHost, malformedScheme } = normalizeStringWithStatus(value, opts);
+      const { normalized, malformedAuthorityOrPort, malformedPercentEncoding, malformedSchemeSpecific, malformedHost, malformedScheme } = normalizeStringWithStatus(value2, opts);
       return malformedAuthorityOrPort || malformedPercentEncoding || malformedSchemeSpecific || malformedHost || malformedScheme ? void 0 : normalized;
     }
     var fastUri = {
       SCHEMES,
       normalize,
-      resolve: resolve6,
+      resolve: resolve7,
       resolveComponent,
       equal,
       serialize: serialize2,
@@ -4684,7 +4684,7 @@ var require_core = __commonJS({
       errorsText(errors = this.errors, { separator = ", ", dataVar = "data" } = {}) {
         if (!errors || errors.length === 0)
           return "No errors";
-        return errors.map((e) => `${dataVar}${e.instancePath} ${e.message}`).reduce((text, msg) => text + separator + msg);
+        return errors.map((e) => `${dataVar}${e.instancePath} ${e.message}`).reduce((text2, msg) => text2 + separator + msg);
       }
       $dataMetaSchema(metaSchema, keywordsJsonPointers) {
         const rules = this.RULES.all;
@@ -5130,13 +5130,13 @@ var require_ucs2length = __commonJS({
       const len = str.length;
       let length = 0;
       let pos = 0;
-      let value;
+      let value2;
       while (pos < len) {
         length++;
-        value = str.charCodeAt(pos++);
-        if (value >= 55296 && value <= 56319 && pos < len) {
-          value = str.charCodeAt(pos);
-          if ((value & 64512) === 56320)
+        value2 = str.charCodeAt(pos++);
+        if (value2 >= 55296 && value2 <= 56319 && pos < len) {
+          value2 = str.charCodeAt(pos);
+          if ((value2 & 64512) === 56320)
             pos++;
         }
       }
@@ -7696,11 +7696,11 @@ var require_formats = __commonJS({
     }
     var MIN_INT32 = -(2 ** 31);
     var MAX_INT32 = 2 ** 31 - 1;
-    function validateInt32(value) {
-      return Number.isInteger(value) && value <= MAX_INT32 && value >= MIN_INT32;
+    function validateInt32(value2) {
+      return Number.isInteger(value2) && value2 <= MAX_INT32 && value2 >= MIN_INT32;
     }
-    function validateInt64(value) {
-      return Number.isInteger(value);
+    function validateInt64(value2) {
+      return Number.isInteger(value2);
     }
     function validateNumber() {
       return true;
@@ -8593,26 +8593,26 @@ var require_toJS = __commonJS({
   "node_modules/yaml/dist/nodes/toJS.js"(exports) {
     "use strict";
     var identity = require_identity();
-    function toJS(value, arg, ctx) {
-      if (Array.isArray(value))
-        return value.map((v, i) => toJS(v, String(i), ctx));
-      if (value && typeof value.toJSON === "function") {
-        if (!ctx || !identity.hasAnchor(value))
-          return value.toJSON(arg, ctx);
+    function toJS(value2, arg, ctx) {
+      if (Array.isArray(value2))
+        return value2.map((v, i) => toJS(v, String(i), ctx));
+      if (value2 && typeof value2.toJSON === "function") {
+        if (!ctx || !identity.hasAnchor(value2))
+          return value2.toJSON(arg, ctx);
         const data = { aliasCount: 0, count: 1, res: void 0 };
-        ctx.anchors.set(value, data);
+        ctx.anchors.set(value2, data);
         ctx.onCreate = (res2) => {
           data.res = res2;
           delete ctx.onCreate;
         };
-        const res = value.toJSON(arg, ctx);
+        const res = value2.toJSON(arg, ctx);
         if (ctx.onCreate)
           ctx.onCreate(res);
         return res;
       }
-      if (typeof value === "bigint" && !ctx?.keep)
-        return Number(value);
-      return value;
+      if (typeof value2 === "bigint" && !ctx?.keep)
+        return Number(value2);
+      return value2;
     }
     exports.toJS = toJS;
   }
@@ -8784,11 +8784,11 @@ var require_Scalar = __commonJS({
     var identity = require_identity();
     var Node = require_Node();
     var toJS = require_toJS();
-    var isScalarValue = (value) => !value || typeof value !== "function" && typeof value !== "object";
+    var isScalarValue = (value2) => !value2 || typeof value2 !== "function" && typeof value2 !== "object";
     var Scalar = class extends Node.NodeBase {
-      constructor(value) {
+      constructor(value2) {
         super(identity.SCALAR);
-        this.value = value;
+        this.value = value2;
       }
       toJSON(arg, ctx) {
         return ctx?.keep ? this.value : toJS.toJS(this.value, arg, ctx);
@@ -8815,7 +8815,7 @@ var require_createNode = __commonJS({
     var identity = require_identity();
     var Scalar = require_Scalar();
     var defaultTagPrefix = "tag:yaml.org,2002:";
-    function findTagObject(value, tagName, tags) {
+    function findTagObject(value2, tagName, tags) {
       if (tagName) {
         const match = tags.filter((t) => t.tag === tagName);
         const tagObj = match.find((t) => !t.format) ?? match[0];
@@ -8823,53 +8823,53 @@ var require_createNode = __commonJS({
           throw new Error(`Tag ${tagName} not found`);
         return tagObj;
       }
-      return tags.find((t) => t.identify?.(value) && !t.format);
+      return tags.find((t) => t.identify?.(value2) && !t.format);
     }
-    function createNode(value, tagName, ctx) {
-      if (identity.isDocument(value))
-        value = value.contents;
-      if (identity.isNode(value))
-        return value;
-      if (identity.isPair(value)) {
+    function createNode(value2, tagName, ctx) {
+      if (identity.isDocument(value2))
+        value2 = value2.contents;
+      if (identity.isNode(value2))
+        return value2;
+      if (identity.isPair(value2)) {
         const map = ctx.schema[identity.MAP].createNode?.(ctx.schema, null, ctx);
-        map.items.push(value);
+        map.items.push(value2);
         return map;
       }
-      if (value instanceof String || value instanceof Number || value instanceof Boolean || typeof BigInt !== "undefined" && value instanceof BigInt) {
-        value = value.valueOf();
+      if (value2 instanceof String || value2 instanceof Number || value2 instanceof Boolean || typeof BigInt !== "undefined" && value2 instanceof BigInt) {
+        value2 = value2.valueOf();
       }
       const { aliasDuplicateObjects, onAnchor, onTagObj, schema, sourceObjects } = ctx;
       let ref = void 0;
-      if (aliasDuplicateObjects && value && typeof value === "object") {
-        ref = sourceObjects.get(value);
+      if (aliasDuplicateObjects && value2 && typeof value2 === "object") {
+        ref = sourceObjects.get(value2);
         if (ref) {
-          ref.anchor ?? (ref.anchor = onAnchor(value));
+          ref.anchor ?? (ref.anchor = onAnchor(value2));
           return new Alias.Alias(ref.anchor);
         } else {
           ref = { anchor: null, node: null };
-          sourceObjects.set(value, ref);
+          sourceObjects.set(value2, ref);
         }
       }
       if (tagName?.startsWith("!!"))
         tagName = defaultTagPrefix + tagName.slice(2);
-      let tagObj = findTagObject(value, tagName, schema.tags);
+      let tagObj = findTagObject(value2, tagName, schema.tags);
       if (!tagObj) {
-        if (value && typeof value.toJSON === "function") {
-          value = value.toJSON();
+        if (value2 && typeof value2.toJSON === "function") {
+          value2 = value2.toJSON();
         }
-        if (!value || typeof value !== "object") {
-          const node2 = new Scalar.Scalar(value);
+        if (!value2 || typeof value2 !== "object") {
+          const node2 = new Scalar.Scalar(value2);
           if (ref)
             ref.node = node2;
           return node2;
         }
-        tagObj = value instanceof Map ? schema[identity.MAP] : Symbol.iterator in Object(value) ? schema[identity.SEQ] : schema[identity.MAP];
+        tagObj = value2 instanceof Map ? schema[identity.MAP] : Symbol.iterator in Object(value2) ? schema[identity.SEQ] : schema[identity.MAP];
       }
       if (onTagObj) {
         onTagObj(tagObj);
         delete ctx.onTagObj;
       }
-      const node = tagObj?.createNode ? tagObj.createNode(ctx.schema, value, ctx) : typeof tagObj?.nodeClass?.from === "function" ? tagObj.nodeClass.from(ctx.schema, value, ctx) : new Scalar.Scalar(value);
+      const node = tagObj?.createNode ? tagObj.createNode(ctx.schema, value2, ctx) : typeof tagObj?.nodeClass?.from === "function" ? tagObj.nodeClass.from(ctx.schema, value2, ctx) : new Scalar.Scalar(value2);
       if (tagName)
         node.tag = tagName;
       else if (!tagObj.default)
@@ -8889,8 +8889,8 @@ var require_Collection = __commonJS({
     var createNode = require_createNode();
     var identity = require_identity();
     var Node = require_Node();
-    function collectionFromPath(schema, path, value) {
-      let v = value;
+    function collectionFromPath(schema, path, value2) {
+      let v = value2;
       for (let i = path.length - 1; i >= 0; --i) {
         const k = path[i];
         if (typeof k === "number" && Number.isInteger(k) && k >= 0) {
@@ -8941,16 +8941,16 @@ var require_Collection = __commonJS({
        * be a Pair instance or a `{ key, value }` object, which may not have a key
        * that already exists in the map.
        */
-      addIn(path, value) {
+      addIn(path, value2) {
         if (isEmptyPath(path))
-          this.add(value);
+          this.add(value2);
         else {
           const [key, ...rest] = path;
           const node = this.get(key, true);
           if (identity.isCollection(node))
-            node.addIn(rest, value);
+            node.addIn(rest, value2);
           else if (node === void 0 && this.schema)
-            this.set(key, collectionFromPath(this.schema, rest, value));
+            this.set(key, collectionFromPath(this.schema, rest, value2));
           else
             throw new Error(`Expected YAML collection at ${key}. Remaining path: ${rest}`);
         }
@@ -9004,16 +9004,16 @@ var require_Collection = __commonJS({
        * Sets a value in this collection. For `!!set`, `value` needs to be a
        * boolean to add/remove the item from the set.
        */
-      setIn(path, value) {
+      setIn(path, value2) {
         const [key, ...rest] = path;
         if (rest.length === 0) {
-          this.set(key, value);
+          this.set(key, value2);
         } else {
           const node = this.get(key, true);
           if (identity.isCollection(node))
-            node.setIn(rest, value);
+            node.setIn(rest, value2);
           else if (node === void 0 && this.schema)
-            this.set(key, collectionFromPath(this.schema, rest, value));
+            this.set(key, collectionFromPath(this.schema, rest, value2));
           else
             throw new Error(`Expected YAML collection at ${key}. Remaining path: ${rest}`);
         }
@@ -9049,14 +9049,14 @@ var require_foldFlowLines = __commonJS({
     var FOLD_FLOW = "flow";
     var FOLD_BLOCK = "block";
     var FOLD_QUOTED = "quoted";
-    function foldFlowLines(text, indent, mode = "flow", { indentAtStart, lineWidth = 80, minContentWidth = 20, onFold, onOverflow } = {}) {
+    function foldFlowLines(text2, indent, mode = "flow", { indentAtStart, lineWidth = 80, minContentWidth = 20, onFold, onOverflow } = {}) {
       if (!lineWidth || lineWidth < 0)
-        return text;
+        return text2;
       if (lineWidth < minContentWidth)
         minContentWidth = 0;
       const endStep = Math.max(1 + minContentWidth, 1 + lineWidth - indent.length);
-      if (text.length <= endStep)
-        return text;
+      if (text2.length <= endStep)
+        return text2;
       const folds = [];
       const escapedFolds = {};
       let end = lineWidth - indent.length;
@@ -9073,14 +9073,14 @@ var require_foldFlowLines = __commonJS({
       let escStart = -1;
       let escEnd = -1;
       if (mode === FOLD_BLOCK) {
-        i = consumeMoreIndentedLines(text, i, indent.length);
+        i = consumeMoreIndentedLines(text2, i, indent.length);
         if (i !== -1)
           end = i + endStep;
       }
-      for (let ch; ch = text[i += 1]; ) {
+      for (let ch; ch = text2[i += 1]; ) {
         if (mode === FOLD_QUOTED && ch === "\\") {
           escStart = i;
-          switch (text[i + 1]) {
+          switch (text2[i + 1]) {
             case "x":
               i += 3;
               break;
@@ -9097,12 +9097,12 @@ var require_foldFlowLines = __commonJS({
         }
         if (ch === "\n") {
           if (mode === FOLD_BLOCK)
-            i = consumeMoreIndentedLines(text, i, indent.length);
+            i = consumeMoreIndentedLines(text2, i, indent.length);
           end = i + indent.length + endStep;
           split = void 0;
         } else {
           if (ch === " " && prev && prev !== " " && prev !== "\n" && prev !== "	") {
-            const next = text[i + 1];
+            const next = text2[i + 1];
             if (next && next !== " " && next !== "\n" && next !== "	")
               split = i;
           }
@@ -9114,12 +9114,12 @@ var require_foldFlowLines = __commonJS({
             } else if (mode === FOLD_QUOTED) {
               while (prev === " " || prev === "	") {
                 prev = ch;
-                ch = text[i += 1];
+                ch = text2[i += 1];
                 overflow = true;
               }
               const j = i > escEnd + 1 ? i - 2 : escStart - 1;
               if (escapedFolds[j])
-                return text;
+                return text2;
               folds.push(j);
               escapedFolds[j] = true;
               end = j + endStep;
@@ -9134,39 +9134,39 @@ var require_foldFlowLines = __commonJS({
       if (overflow && onOverflow)
         onOverflow();
       if (folds.length === 0)
-        return text;
+        return text2;
       if (onFold)
         onFold();
-      let res = text.slice(0, folds[0]);
+      let res = text2.slice(0, folds[0]);
       for (let i2 = 0; i2 < folds.length; ++i2) {
         const fold = folds[i2];
-        const end2 = folds[i2 + 1] || text.length;
+        const end2 = folds[i2 + 1] || text2.length;
         if (fold === 0)
           res = `
-${indent}${text.slice(0, end2)}`;
+${indent}${text2.slice(0, end2)}`;
         else {
           if (mode === FOLD_QUOTED && escapedFolds[fold])
-            res += `${text[fold]}\\`;
+            res += `${text2[fold]}\\`;
           res += `
-${indent}${text.slice(fold + 1, end2)}`;
+${indent}${text2.slice(fold + 1, end2)}`;
         }
       }
       return res;
     }
-    function consumeMoreIndentedLines(text, i, indent) {
+    function consumeMoreIndentedLines(text2, i, indent) {
       let end = i;
       let start = i + 1;
-      let ch = text[start];
+      let ch = text2[start];
       while (ch === " " || ch === "	") {
         if (i < start + indent) {
-          ch = text[++i];
+          ch = text2[++i];
         } else {
           do {
-            ch = text[++i];
+            ch = text2[++i];
           } while (ch && ch !== "\n");
           end = i;
           start = i + 1;
-          ch = text[start];
+          ch = text2[start];
         }
       }
       return end;
@@ -9208,13 +9208,13 @@ var require_stringifyString = __commonJS({
       }
       return true;
     }
-    function doubleQuotedString(value, ctx) {
-      const json = JSON.stringify(value);
+    function doubleQuotedString(value2, ctx) {
+      const json = JSON.stringify(value2);
       if (ctx.options.doubleQuotedAsJSON)
         return json;
       const { implicitKey } = ctx;
       const minMultiLineLength = ctx.options.doubleQuotedMinMultiLineLength;
-      const indent = ctx.indent || (containsDocumentMarker(value) ? "  " : "");
+      const indent = ctx.indent || (containsDocumentMarker(value2) ? "  " : "");
       let str = "";
       let start = 0;
       for (let i = 0, ch = json[i]; ch; ch = json[++i]) {
@@ -9288,22 +9288,22 @@ var require_stringifyString = __commonJS({
       str = start ? str + json.slice(start) : json;
       return implicitKey ? str : foldFlowLines.foldFlowLines(str, indent, foldFlowLines.FOLD_QUOTED, getFoldOptions(ctx, false));
     }
-    function singleQuotedString(value, ctx) {
-      if (ctx.options.singleQuote === false || ctx.implicitKey && value.includes("\n") || /[ \t]\n|\n[ \t]/.test(value))
-        return doubleQuotedString(value, ctx);
-      const indent = ctx.indent || (containsDocumentMarker(value) ? "  " : "");
-      const res = "'" + value.replace(/'/g, "''").replace(/\n+/g, `$&
+    function singleQuotedString(value2, ctx) {
+      if (ctx.options.singleQuote === false || ctx.implicitKey && value2.includes("\n") || /[ \t]\n|\n[ \t]/.test(value2))
+        return doubleQuotedString(value2, ctx);
+      const indent = ctx.indent || (containsDocumentMarker(value2) ? "  " : "");
+      const res = "'" + value2.replace(/'/g, "''").replace(/\n+/g, `$&
 ${indent}`) + "'";
       return ctx.implicitKey ? res : foldFlowLines.foldFlowLines(res, indent, foldFlowLines.FOLD_FLOW, getFoldOptions(ctx, false));
     }
-    function quotedString(value, ctx) {
+    function quotedString(value2, ctx) {
       const { singleQuote } = ctx.options;
       let qs;
       if (singleQuote === false)
         qs = doubleQuotedString;
       else {
-        const hasDouble = value.includes('"');
-        const hasSingle = value.includes("'");
+        const hasDouble = value2.includes('"');
+        const hasSingle = value2.includes("'");
         if (hasDouble && !hasSingle)
           qs = singleQuotedString;
         else if (hasSingle && !hasDouble)
@@ -9311,7 +9311,7 @@ ${indent}`) + "'";
         else
           qs = singleQuote ? singleQuotedString : doubleQuotedString;
       }
-      return qs(value, ctx);
+      return qs(value2, ctx);
     }
     var blockEndNewlines;
     try {
@@ -9319,27 +9319,27 @@ ${indent}`) + "'";
     } catch {
       blockEndNewlines = /\n+(?!\n|$)/g;
     }
-    function blockString({ comment, type, value }, ctx, onComment, onChompKeep) {
+    function blockString({ comment, type, value: value2 }, ctx, onComment, onChompKeep) {
       const { blockQuote, commentString, lineWidth } = ctx.options;
-      if (!blockQuote || /\n[\t ]+$/.test(value)) {
-        return quotedString(value, ctx);
+      if (!blockQuote || /\n[\t ]+$/.test(value2)) {
+        return quotedString(value2, ctx);
       }
-      const indent = ctx.indent || (ctx.forceBlockIndent || containsDocumentMarker(value) ? "  " : "");
-      const literal = blockQuote === "literal" ? true : blockQuote === "folded" || type === Scalar.Scalar.BLOCK_FOLDED ? false : type === Scalar.Scalar.BLOCK_LITERAL ? true : !lineLengthOverLimit(value, lineWidth, indent.length);
-      if (!value)
+      const indent = ctx.indent || (ctx.forceBlockIndent || containsDocumentMarker(value2) ? "  " : "");
+      const literal = blockQuote === "literal" ? true : blockQuote === "folded" || type === Scalar.Scalar.BLOCK_FOLDED ? false : type === Scalar.Scalar.BLOCK_LITERAL ? true : !lineLengthOverLimit(value2, lineWidth, indent.length);
+      if (!value2)
         return literal ? "|\n" : ">\n";
       let chomp;
       let endStart;
-      for (endStart = value.length; endStart > 0; --endStart) {
-        const ch = value[endStart - 1];
+      for (endStart = value2.length; endStart > 0; --endStart) {
+        const ch = value2[endStart - 1];
         if (ch !== "\n" && ch !== "	" && ch !== " ")
           break;
       }
-      let end = value.substring(endStart);
+      let end = value2.substring(endStart);
       const endNlPos = end.indexOf("\n");
       if (endNlPos === -1) {
         chomp = "-";
-      } else if (value === end || endNlPos !== end.length - 1) {
+      } else if (value2 === end || endNlPos !== end.length - 1) {
         chomp = "+";
         if (onChompKeep)
           onChompKeep();
@@ -9347,7 +9347,7 @@ ${indent}`) + "'";
         chomp = "";
       }
       if (end) {
-        value = value.slice(0, -end.length);
+        value2 = value2.slice(0, -end.length);
         if (end[end.length - 1] === "\n")
           end = end.slice(0, -1);
         end = end.replace(blockEndNewlines, `$&${indent}`);
@@ -9355,8 +9355,8 @@ ${indent}`) + "'";
       let startWithSpace = false;
       let startEnd;
       let startNlPos = -1;
-      for (startEnd = 0; startEnd < value.length; ++startEnd) {
-        const ch = value[startEnd];
+      for (startEnd = 0; startEnd < value2.length; ++startEnd) {
+        const ch = value2[startEnd];
         if (ch === " ")
           startWithSpace = true;
         else if (ch === "\n")
@@ -9364,9 +9364,9 @@ ${indent}`) + "'";
         else
           break;
       }
-      let start = value.substring(0, startNlPos < startEnd ? startNlPos + 1 : startEnd);
+      let start = value2.substring(0, startNlPos < startEnd ? startNlPos + 1 : startEnd);
       if (start) {
-        value = value.substring(start.length);
+        value2 = value2.substring(start.length);
         start = start.replace(/\n+/g, `$&${indent}`);
       }
       const indentSize = indent ? "2" : "1";
@@ -9377,7 +9377,7 @@ ${indent}`) + "'";
           onComment();
       }
       if (!literal) {
-        const foldedValue = value.replace(/\n+/g, "\n$&").replace(/(?:^|\n)([\t ].*)(?:([\n\t ]*)\n(?![\n\t ]))?/g, "$1$2").replace(/\n+/g, `$&${indent}`);
+        const foldedValue = value2.replace(/\n+/g, "\n$&").replace(/(?:^|\n)([\t ].*)(?:([\n\t ]*)\n(?![\n\t ]))?/g, "$1$2").replace(/\n+/g, `$&${indent}`);
         let literalFallback = false;
         const foldOptions = getFoldOptions(ctx, true);
         if (blockQuote !== "folded" && type !== Scalar.Scalar.BLOCK_FOLDED) {
@@ -9390,37 +9390,37 @@ ${indent}`) + "'";
           return `>${header}
 ${indent}${body}`;
       }
-      value = value.replace(/\n+/g, `$&${indent}`);
+      value2 = value2.replace(/\n+/g, `$&${indent}`);
       return `|${header}
-${indent}${start}${value}${end}`;
+${indent}${start}${value2}${end}`;
     }
     function plainString(item, ctx, onComment, onChompKeep) {
-      const { type, value } = item;
+      const { type, value: value2 } = item;
       const { actualString, implicitKey, indent, indentStep, inFlow } = ctx;
-      if (implicitKey && value.includes("\n") || inFlow && /[[\]{},]/.test(value)) {
-        return quotedString(value, ctx);
+      if (implicitKey && value2.includes("\n") || inFlow && /[[\]{},]/.test(value2)) {
+        return quotedString(value2, ctx);
       }
-      if (/^[\n\t ,[\]{}#&*!|>'"%@`]|^[?-]$|^[?-][ \t]|[\n:][ \t]|[ \t]\n|[\n\t ]#|[\n\t :]$/.test(value)) {
-        return implicitKey || inFlow || !value.includes("\n") ? quotedString(value, ctx) : blockString(item, ctx, onComment, onChompKeep);
+      if (/^[\n\t ,[\]{}#&*!|>'"%@`]|^[?-]$|^[?-][ \t]|[\n:][ \t]|[ \t]\n|[\n\t ]#|[\n\t :]$/.test(value2)) {
+        return implicitKey || inFlow || !value2.includes("\n") ? quotedString(value2, ctx) : blockString(item, ctx, onComment, onChompKeep);
       }
-      if (!implicitKey && !inFlow && type !== Scalar.Scalar.PLAIN && value.includes("\n")) {
+      if (!implicitKey && !inFlow && type !== Scalar.Scalar.PLAIN && value2.includes("\n")) {
         return blockString(item, ctx, onComment, onChompKeep);
       }
-      if (containsDocumentMarker(value)) {
+      if (containsDocumentMarker(value2)) {
         if (indent === "") {
           ctx.forceBlockIndent = true;
           return blockString(item, ctx, onComment, onChompKeep);
         } else if (implicitKey && indent === indentStep) {
-          return quotedString(value, ctx);
+          return quotedString(value2, ctx);
         }
       }
-      const str = value.replace(/\n+/g, `$&
+      const str = value2.replace(/\n+/g, `$&
 ${indent}`);
       if (actualString) {
-        const test = (tag) => tag.default && tag.tag !== "tag:yaml.org,2002:str" && tag.test?.test(str);
+        const test2 = (tag) => tag.default && tag.tag !== "tag:yaml.org,2002:str" && tag.test?.test(str);
         const { compat, tags } = ctx.doc.schema;
-        if (tags.some(test) || compat?.some(test))
-          return quotedString(value, ctx);
+        if (tags.some(test2) || compat?.some(test2))
+          return quotedString(value2, ctx);
       }
       return implicitKey ? str : foldFlowLines.foldFlowLines(str, indent, foldFlowLines.FOLD_FLOW, getFoldOptions(ctx, false));
     }
@@ -9593,7 +9593,7 @@ var require_stringifyPair = __commonJS({
     var Scalar = require_Scalar();
     var stringify = require_stringify();
     var stringifyComment = require_stringifyComment();
-    function stringifyPair({ key, value }, ctx, onComment, onChompKeep) {
+    function stringifyPair({ key, value: value2 }, ctx, onComment, onChompKeep) {
       const { allNullValues, doc, indent, indentStep, options: { commentString, indentSeq, simpleKeys } } = ctx;
       let keyComment = identity.isNode(key) && key.comment || null;
       if (simpleKeys) {
@@ -9605,7 +9605,7 @@ var require_stringifyPair = __commonJS({
           throw new Error(msg);
         }
       }
-      let explicitKey = !simpleKeys && (!key || keyComment && value == null && !ctx.inFlow || identity.isCollection(key) || (identity.isScalar(key) ? key.type === Scalar.Scalar.BLOCK_FOLDED || key.type === Scalar.Scalar.BLOCK_LITERAL : typeof key === "object"));
+      let explicitKey = !simpleKeys && (!key || keyComment && value2 == null && !ctx.inFlow || identity.isCollection(key) || (identity.isScalar(key) ? key.type === Scalar.Scalar.BLOCK_FOLDED || key.type === Scalar.Scalar.BLOCK_LITERAL : typeof key === "object"));
       ctx = Object.assign({}, ctx, {
         allNullValues: false,
         implicitKey: !explicitKey && (simpleKeys || !allNullValues),
@@ -9620,12 +9620,12 @@ var require_stringifyPair = __commonJS({
         explicitKey = true;
       }
       if (ctx.inFlow) {
-        if (allNullValues || value == null) {
+        if (allNullValues || value2 == null) {
           if (keyCommentDone && onComment)
             onComment();
           return str === "" ? "?" : explicitKey ? `? ${str}` : str;
         }
-      } else if (allNullValues && !simpleKeys || value == null && explicitKey) {
+      } else if (allNullValues && !simpleKeys || value2 == null && explicitKey) {
         str = `? ${str}`;
         if (keyComment && !keyCommentDone) {
           str += stringifyComment.lineComment(str, ctx.indent, commentString(keyComment));
@@ -9646,26 +9646,26 @@ ${indent}:`;
           str += stringifyComment.lineComment(str, ctx.indent, commentString(keyComment));
       }
       let vsb, vcb, valueComment;
-      if (identity.isNode(value)) {
-        vsb = !!value.spaceBefore;
-        vcb = value.commentBefore;
-        valueComment = value.comment;
+      if (identity.isNode(value2)) {
+        vsb = !!value2.spaceBefore;
+        vcb = value2.commentBefore;
+        valueComment = value2.comment;
       } else {
         vsb = false;
         vcb = null;
         valueComment = null;
-        if (value && typeof value === "object")
-          value = doc.createNode(value);
+        if (value2 && typeof value2 === "object")
+          value2 = doc.createNode(value2);
       }
       ctx.implicitKey = false;
-      if (!explicitKey && !keyComment && identity.isScalar(value))
+      if (!explicitKey && !keyComment && identity.isScalar(value2))
         ctx.indentAtStart = str.length + 1;
       chompKeep = false;
-      if (!indentSeq && indentStep.length >= 2 && !ctx.inFlow && !explicitKey && identity.isSeq(value) && !value.flow && !value.tag && !value.anchor) {
+      if (!indentSeq && indentStep.length >= 2 && !ctx.inFlow && !explicitKey && identity.isSeq(value2) && !value2.flow && !value2.tag && !value2.anchor) {
         ctx.indent = ctx.indent.substring(2);
       }
       let valueCommentDone = false;
-      const valueStr = stringify.stringify(value, ctx, () => valueCommentDone = true, () => chompKeep = true);
+      const valueStr = stringify.stringify(value2, ctx, () => valueCommentDone = true, () => chompKeep = true);
       let ws = " ";
       if (keyComment || vsb || vcb) {
         ws = vsb ? "\n" : "";
@@ -9681,11 +9681,11 @@ ${stringifyComment.indentComment(cs, ctx.indent)}`;
           ws += `
 ${ctx.indent}`;
         }
-      } else if (!explicitKey && identity.isCollection(value)) {
+      } else if (!explicitKey && identity.isCollection(value2)) {
         const vs0 = valueStr[0];
         const nl0 = valueStr.indexOf("\n");
         const hasNewline = nl0 !== -1;
-        const flow = ctx.inFlow ?? value.flow ?? value.items.length === 0;
+        const flow = ctx.inFlow ?? value2.flow ?? value2.items.length === 0;
         if (hasNewline || !flow) {
           let hasPropsLine = false;
           if (hasNewline && (vs0 === "&" || vs0 === "!")) {
@@ -9748,7 +9748,7 @@ var require_merge = __commonJS({
     var Scalar = require_Scalar();
     var MERGE_KEY = "<<";
     var merge = {
-      identify: (value) => value === MERGE_KEY || typeof value === "symbol" && value.description === MERGE_KEY,
+      identify: (value2) => value2 === MERGE_KEY || typeof value2 === "symbol" && value2.description === MERGE_KEY,
       default: "key",
       tag: "tag:yaml.org,2002:merge",
       test: /^<<$/,
@@ -9758,8 +9758,8 @@ var require_merge = __commonJS({
       stringify: () => MERGE_KEY
     };
     var isMergeKey = (ctx, key) => (merge.identify(key) || identity.isScalar(key) && (!key.type || key.type === Scalar.Scalar.PLAIN) && merge.identify(key.value)) && ctx?.doc.schema.tags.some((tag) => tag.tag === merge.tag && tag.default);
-    function addMergeToJSMap(ctx, map, value) {
-      const source = resolveAliasValue(ctx, value);
+    function addMergeToJSMap(ctx, map, value2) {
+      const source = resolveAliasValue(ctx, value2);
       if (identity.isSeq(source))
         for (const it of source.items)
           mergeValue(ctx, map, it);
@@ -9769,20 +9769,20 @@ var require_merge = __commonJS({
       else
         mergeValue(ctx, map, source);
     }
-    function mergeValue(ctx, map, value) {
-      const source = resolveAliasValue(ctx, value);
+    function mergeValue(ctx, map, value2) {
+      const source = resolveAliasValue(ctx, value2);
       if (!identity.isMap(source))
         throw new Error("Merge sources must be maps or map aliases");
       const srcMap = source.toJSON(null, ctx, Map);
-      for (const [key, value2] of srcMap) {
+      for (const [key, value3] of srcMap) {
         if (map instanceof Map) {
           if (!map.has(key))
-            map.set(key, value2);
+            map.set(key, value3);
         } else if (map instanceof Set) {
           map.add(key);
         } else if (!Object.prototype.hasOwnProperty.call(map, key)) {
           Object.defineProperty(map, key, {
-            value: value2,
+            value: value3,
             writable: true,
             enumerable: true,
             configurable: true
@@ -9791,8 +9791,8 @@ var require_merge = __commonJS({
       }
       return map;
     }
-    function resolveAliasValue(ctx, value) {
-      return ctx && identity.isAlias(value) ? value.resolve(ctx.doc, ctx) : value;
+    function resolveAliasValue(ctx, value2) {
+      return ctx && identity.isAlias(value2) ? value2.resolve(ctx.doc, ctx) : value2;
     }
     exports.addMergeToJSMap = addMergeToJSMap;
     exports.isMergeKey = isMergeKey;
@@ -9809,20 +9809,20 @@ var require_addPairToJSMap = __commonJS({
     var stringify = require_stringify();
     var identity = require_identity();
     var toJS = require_toJS();
-    function addPairToJSMap(ctx, map, { key, value }) {
+    function addPairToJSMap(ctx, map, { key, value: value2 }) {
       if (identity.isNode(key) && key.addToJSMap)
-        key.addToJSMap(ctx, map, value);
+        key.addToJSMap(ctx, map, value2);
       else if (merge.isMergeKey(ctx, key))
-        merge.addMergeToJSMap(ctx, map, value);
+        merge.addMergeToJSMap(ctx, map, value2);
       else {
         const jsKey = toJS.toJS(key, "", ctx);
         if (map instanceof Map) {
-          map.set(jsKey, toJS.toJS(value, jsKey, ctx));
+          map.set(jsKey, toJS.toJS(value2, jsKey, ctx));
         } else if (map instanceof Set) {
           map.add(jsKey);
         } else {
           const stringKey = stringifyKey(key, jsKey, ctx);
-          const jsValue = toJS.toJS(value, stringKey, ctx);
+          const jsValue = toJS.toJS(value2, stringKey, ctx);
           if (stringKey in map)
             Object.defineProperty(map, stringKey, {
               value: jsValue,
@@ -9872,24 +9872,24 @@ var require_Pair = __commonJS({
     var stringifyPair = require_stringifyPair();
     var addPairToJSMap = require_addPairToJSMap();
     var identity = require_identity();
-    function createPair(key, value, ctx) {
+    function createPair(key, value2, ctx) {
       const k = createNode.createNode(key, void 0, ctx);
-      const v = createNode.createNode(value, void 0, ctx);
+      const v = createNode.createNode(value2, void 0, ctx);
       return new Pair(k, v);
     }
     var Pair = class _Pair {
-      constructor(key, value = null) {
+      constructor(key, value2 = null) {
         Object.defineProperty(this, identity.NODE_TYPE, { value: identity.PAIR });
         this.key = key;
-        this.value = value;
+        this.value = value2;
       }
       clone(schema) {
-        let { key, value } = this;
+        let { key, value: value2 } = this;
         if (identity.isNode(key))
           key = key.clone(schema);
-        if (identity.isNode(value))
-          value = value.clone(schema);
-        return new _Pair(key, value);
+        if (identity.isNode(value2))
+          value2 = value2.clone(schema);
+        return new _Pair(key, value2);
       }
       toJSON(_, ctx) {
         const pair = ctx?.mapAsMap ? /* @__PURE__ */ new Map() : {};
@@ -10092,20 +10092,20 @@ var require_YAMLMap = __commonJS({
       static from(schema, obj, ctx) {
         const { keepUndefined, replacer } = ctx;
         const map = new this(schema);
-        const add = (key, value) => {
+        const add2 = (key, value2) => {
           if (typeof replacer === "function")
-            value = replacer.call(obj, key, value);
+            value2 = replacer.call(obj, key, value2);
           else if (Array.isArray(replacer) && !replacer.includes(key))
             return;
-          if (value !== void 0 || keepUndefined)
-            map.items.push(Pair.createPair(key, value, ctx));
+          if (value2 !== void 0 || keepUndefined)
+            map.items.push(Pair.createPair(key, value2, ctx));
         };
         if (obj instanceof Map) {
-          for (const [key, value] of obj)
-            add(key, value);
+          for (const [key, value2] of obj)
+            add2(key, value2);
         } else if (obj && typeof obj === "object") {
           for (const key of Object.keys(obj))
-            add(key, obj[key]);
+            add2(key, obj[key]);
         }
         if (typeof schema.sortMapEntries === "function") {
           map.items.sort(schema.sortMapEntries);
@@ -10160,8 +10160,8 @@ var require_YAMLMap = __commonJS({
       has(key) {
         return !!findPair(this.items, key);
       }
-      set(key, value) {
-        this.add(new Pair.Pair(key, value), true);
+      set(key, value2) {
+        this.add(new Pair.Pair(key, value2), true);
       }
       /**
        * @param ctx - Conversion context, originally set in Document#toJS()
@@ -10239,8 +10239,8 @@ var require_YAMLSeq = __commonJS({
         super(identity.SEQ, schema);
         this.items = [];
       }
-      add(value) {
-        this.items.push(value);
+      add(value2) {
+        this.items.push(value2);
       }
       /**
        * Removes a value from the collection.
@@ -10281,15 +10281,15 @@ var require_YAMLSeq = __commonJS({
        * If `key` does not contain a representation of an integer, this will throw.
        * It may be wrapped in a `Scalar`.
        */
-      set(key, value) {
+      set(key, value2) {
         const idx = asItemIndex(key);
         if (typeof idx !== "number")
           throw new Error(`Expected a valid index, not ${key}.`);
         const prev = this.items[idx];
-        if (identity.isScalar(prev) && Scalar.isScalarValue(value))
-          prev.value = value;
+        if (identity.isScalar(prev) && Scalar.isScalarValue(value2))
+          prev.value = value2;
         else
-          this.items[idx] = value;
+          this.items[idx] = value2;
       }
       toJSON(_, ctx) {
         const seq = [];
@@ -10365,7 +10365,7 @@ var require_string = __commonJS({
     "use strict";
     var stringifyString = require_stringifyString();
     var string = {
-      identify: (value) => typeof value === "string",
+      identify: (value2) => typeof value2 === "string",
       default: true,
       tag: "tag:yaml.org,2002:str",
       resolve: (str) => str,
@@ -10384,7 +10384,7 @@ var require_null = __commonJS({
     "use strict";
     var Scalar = require_Scalar();
     var nullTag = {
-      identify: (value) => value == null,
+      identify: (value2) => value2 == null,
       createNode: () => new Scalar.Scalar(null),
       default: true,
       tag: "tag:yaml.org,2002:null",
@@ -10402,18 +10402,18 @@ var require_bool = __commonJS({
     "use strict";
     var Scalar = require_Scalar();
     var boolTag = {
-      identify: (value) => typeof value === "boolean",
+      identify: (value2) => typeof value2 === "boolean",
       default: true,
       tag: "tag:yaml.org,2002:bool",
       test: /^(?:[Tt]rue|TRUE|[Ff]alse|FALSE)$/,
       resolve: (str) => new Scalar.Scalar(str[0] === "t" || str[0] === "T"),
-      stringify({ source, value }, ctx) {
+      stringify({ source, value: value2 }, ctx) {
         if (source && boolTag.test.test(source)) {
           const sv = source[0] === "t" || source[0] === "T";
-          if (value === sv)
+          if (value2 === sv)
             return source;
         }
-        return value ? ctx.options.trueStr : ctx.options.falseStr;
+        return value2 ? ctx.options.trueStr : ctx.options.falseStr;
       }
     };
     exports.boolTag = boolTag;
@@ -10424,13 +10424,13 @@ var require_bool = __commonJS({
 var require_stringifyNumber = __commonJS({
   "node_modules/yaml/dist/stringify/stringifyNumber.js"(exports) {
     "use strict";
-    function stringifyNumber({ format, minFractionDigits, tag, value }) {
-      if (typeof value === "bigint")
-        return String(value);
-      const num2 = typeof value === "number" ? value : Number(value);
-      if (!isFinite(num2))
-        return isNaN(num2) ? ".nan" : num2 < 0 ? "-.inf" : ".inf";
-      let n = Object.is(value, -0) ? "-0" : JSON.stringify(value);
+    function stringifyNumber({ format, minFractionDigits, tag, value: value2 }) {
+      if (typeof value2 === "bigint")
+        return String(value2);
+      const num = typeof value2 === "number" ? value2 : Number(value2);
+      if (!isFinite(num))
+        return isNaN(num) ? ".nan" : num < 0 ? "-.inf" : ".inf";
+      let n = Object.is(value2, -0) ? "-0" : JSON.stringify(value2);
       if (!format && minFractionDigits && (!tag || tag === "tag:yaml.org,2002:float") && /^-?\d/.test(n) && !n.includes("e")) {
         let i = n.indexOf(".");
         if (i < 0) {
@@ -10454,7 +10454,7 @@ var require_float = __commonJS({
     var Scalar = require_Scalar();
     var stringifyNumber = require_stringifyNumber();
     var floatNaN = {
-      identify: (value) => typeof value === "number",
+      identify: (value2) => typeof value2 === "number",
       default: true,
       tag: "tag:yaml.org,2002:float",
       test: /^(?:[-+]?\.(?:inf|Inf|INF)|\.nan|\.NaN|\.NAN)$/,
@@ -10462,19 +10462,19 @@ var require_float = __commonJS({
       stringify: stringifyNumber.stringifyNumber
     };
     var floatExp = {
-      identify: (value) => typeof value === "number",
+      identify: (value2) => typeof value2 === "number",
       default: true,
       tag: "tag:yaml.org,2002:float",
       format: "EXP",
       test: /^[-+]?(?:\.[0-9]+|[0-9]+(?:\.[0-9]*)?)[eE][-+]?[0-9]+$/,
       resolve: (str) => parseFloat(str),
       stringify(node) {
-        const num2 = Number(node.value);
-        return isFinite(num2) ? num2.toExponential() : stringifyNumber.stringifyNumber(node);
+        const num = Number(node.value);
+        return isFinite(num) ? num.toExponential() : stringifyNumber.stringifyNumber(node);
       }
     };
     var float = {
-      identify: (value) => typeof value === "number",
+      identify: (value2) => typeof value2 === "number",
       default: true,
       tag: "tag:yaml.org,2002:float",
       test: /^[-+]?(?:\.[0-9]+|[0-9]+\.[0-9]*)$/,
@@ -10498,16 +10498,16 @@ var require_int = __commonJS({
   "node_modules/yaml/dist/schema/core/int.js"(exports) {
     "use strict";
     var stringifyNumber = require_stringifyNumber();
-    var intIdentify = (value) => typeof value === "bigint" || Number.isInteger(value);
+    var intIdentify = (value2) => typeof value2 === "bigint" || Number.isInteger(value2);
     var intResolve = (str, offset, radix, { intAsBigInt }) => intAsBigInt ? BigInt(str) : parseInt(str.substring(offset), radix);
     function intStringify(node, radix, prefix) {
-      const { value } = node;
-      if (intIdentify(value) && value >= 0)
-        return prefix + value.toString(radix);
+      const { value: value2 } = node;
+      if (intIdentify(value2) && value2 >= 0)
+        return prefix + value2.toString(radix);
       return stringifyNumber.stringifyNumber(node);
     }
     var intOct = {
-      identify: (value) => intIdentify(value) && value >= 0,
+      identify: (value2) => intIdentify(value2) && value2 >= 0,
       default: true,
       tag: "tag:yaml.org,2002:int",
       format: "OCT",
@@ -10524,7 +10524,7 @@ var require_int = __commonJS({
       stringify: stringifyNumber.stringifyNumber
     };
     var intHex = {
-      identify: (value) => intIdentify(value) && value >= 0,
+      identify: (value2) => intIdentify(value2) && value2 >= 0,
       default: true,
       tag: "tag:yaml.org,2002:int",
       format: "HEX",
@@ -10573,20 +10573,20 @@ var require_schema3 = __commonJS({
     var Scalar = require_Scalar();
     var map = require_map();
     var seq = require_seq();
-    function intIdentify(value) {
-      return typeof value === "bigint" || Number.isInteger(value);
+    function intIdentify(value2) {
+      return typeof value2 === "bigint" || Number.isInteger(value2);
     }
-    var stringifyJSON = ({ value }) => JSON.stringify(value);
+    var stringifyJSON = ({ value: value2 }) => JSON.stringify(value2);
     var jsonScalars = [
       {
-        identify: (value) => typeof value === "string",
+        identify: (value2) => typeof value2 === "string",
         default: true,
         tag: "tag:yaml.org,2002:str",
         resolve: (str) => str,
         stringify: stringifyJSON
       },
       {
-        identify: (value) => value == null,
+        identify: (value2) => value2 == null,
         createNode: () => new Scalar.Scalar(null),
         default: true,
         tag: "tag:yaml.org,2002:null",
@@ -10595,7 +10595,7 @@ var require_schema3 = __commonJS({
         stringify: stringifyJSON
       },
       {
-        identify: (value) => typeof value === "boolean",
+        identify: (value2) => typeof value2 === "boolean",
         default: true,
         tag: "tag:yaml.org,2002:bool",
         test: /^true$|^false$/,
@@ -10608,10 +10608,10 @@ var require_schema3 = __commonJS({
         tag: "tag:yaml.org,2002:int",
         test: /^-?(?:0|[1-9][0-9]*)$/,
         resolve: (str, _onError, { intAsBigInt }) => intAsBigInt ? BigInt(str) : parseInt(str, 10),
-        stringify: ({ value }) => intIdentify(value) ? value.toString() : JSON.stringify(value)
+        stringify: ({ value: value2 }) => intIdentify(value2) ? value2.toString() : JSON.stringify(value2)
       },
       {
-        identify: (value) => typeof value === "number",
+        identify: (value2) => typeof value2 === "number",
         default: true,
         tag: "tag:yaml.org,2002:float",
         test: /^-?(?:0|[1-9][0-9]*)(?:\.[0-9]*)?(?:[eE][-+]?[0-9]+)?$/,
@@ -10641,7 +10641,7 @@ var require_binary = __commonJS({
     var Scalar = require_Scalar();
     var stringifyString = require_stringifyString();
     var binary = {
-      identify: (value) => value instanceof Uint8Array,
+      identify: (value2) => value2 instanceof Uint8Array,
       // Buffer inherits from Uint8Array
       default: false,
       tag: "tag:yaml.org,2002:binary",
@@ -10667,10 +10667,10 @@ var require_binary = __commonJS({
           return src;
         }
       },
-      stringify({ comment, type, value }, ctx, onComment, onChompKeep) {
-        if (!value)
+      stringify({ comment, type, value: value2 }, ctx, onComment, onChompKeep) {
+        if (!value2)
           return "";
-        const buf = value;
+        const buf = value2;
         let str;
         if (typeof node_buffer.Buffer === "function") {
           str = buf instanceof node_buffer.Buffer ? buf.toString("base64") : node_buffer.Buffer.from(buf.buffer).toString("base64");
@@ -10742,25 +10742,25 @@ ${cn.comment}` : item.comment;
         for (let it of iterable) {
           if (typeof replacer === "function")
             it = replacer.call(iterable, String(i++), it);
-          let key, value;
+          let key, value2;
           if (Array.isArray(it)) {
             if (it.length === 2) {
               key = it[0];
-              value = it[1];
+              value2 = it[1];
             } else
               throw new TypeError(`Expected [key, value] tuple: ${it}`);
           } else if (it && it instanceof Object) {
             const keys = Object.keys(it);
             if (keys.length === 1) {
               key = keys[0];
-              value = it[key];
+              value2 = it[key];
             } else {
               throw new TypeError(`Expected tuple with one key, not ${keys.length} keys`);
             }
           } else {
             key = it;
           }
-          pairs2.items.push(Pair.createPair(key, value, ctx));
+          pairs2.items.push(Pair.createPair(key, value2, ctx));
         }
       return pairs2;
     }
@@ -10807,16 +10807,16 @@ var require_omap = __commonJS({
         if (ctx?.onCreate)
           ctx.onCreate(map);
         for (const pair of this.items) {
-          let key, value;
+          let key, value2;
           if (identity.isPair(pair)) {
             key = toJS.toJS(pair.key, "", ctx);
-            value = toJS.toJS(pair.value, key, ctx);
+            value2 = toJS.toJS(pair.value, key, ctx);
           } else {
             key = toJS.toJS(pair, "", ctx);
           }
           if (map.has(key))
             throw new Error("Ordered maps must not include duplicate keys");
-          map.set(key, value);
+          map.set(key, value2);
         }
         return map;
       }
@@ -10830,7 +10830,7 @@ var require_omap = __commonJS({
     YAMLOMap.tag = "tag:yaml.org,2002:omap";
     var omap = {
       collection: "seq",
-      identify: (value) => value instanceof Map,
+      identify: (value2) => value2 instanceof Map,
       nodeClass: YAMLOMap,
       default: false,
       tag: "tag:yaml.org,2002:omap",
@@ -10860,14 +10860,14 @@ var require_bool2 = __commonJS({
   "node_modules/yaml/dist/schema/yaml-1.1/bool.js"(exports) {
     "use strict";
     var Scalar = require_Scalar();
-    function boolStringify({ value, source }, ctx) {
-      const boolObj = value ? trueTag : falseTag;
+    function boolStringify({ value: value2, source }, ctx) {
+      const boolObj = value2 ? trueTag : falseTag;
       if (source && boolObj.test.test(source))
         return source;
-      return value ? ctx.options.trueStr : ctx.options.falseStr;
+      return value2 ? ctx.options.trueStr : ctx.options.falseStr;
     }
     var trueTag = {
-      identify: (value) => value === true,
+      identify: (value2) => value2 === true,
       default: true,
       tag: "tag:yaml.org,2002:bool",
       test: /^(?:Y|y|[Yy]es|YES|[Tt]rue|TRUE|[Oo]n|ON)$/,
@@ -10875,7 +10875,7 @@ var require_bool2 = __commonJS({
       stringify: boolStringify
     };
     var falseTag = {
-      identify: (value) => value === false,
+      identify: (value2) => value2 === false,
       default: true,
       tag: "tag:yaml.org,2002:bool",
       test: /^(?:N|n|[Nn]o|NO|[Ff]alse|FALSE|[Oo]ff|OFF)$/,
@@ -10894,7 +10894,7 @@ var require_float2 = __commonJS({
     var Scalar = require_Scalar();
     var stringifyNumber = require_stringifyNumber();
     var floatNaN = {
-      identify: (value) => typeof value === "number",
+      identify: (value2) => typeof value2 === "number",
       default: true,
       tag: "tag:yaml.org,2002:float",
       test: /^(?:[-+]?\.(?:inf|Inf|INF)|\.nan|\.NaN|\.NAN)$/,
@@ -10902,19 +10902,19 @@ var require_float2 = __commonJS({
       stringify: stringifyNumber.stringifyNumber
     };
     var floatExp = {
-      identify: (value) => typeof value === "number",
+      identify: (value2) => typeof value2 === "number",
       default: true,
       tag: "tag:yaml.org,2002:float",
       format: "EXP",
       test: /^[-+]?(?:[0-9][0-9_]*)?(?:\.[0-9_]*)?[eE][-+]?[0-9]+$/,
       resolve: (str) => parseFloat(str.replace(/_/g, "")),
       stringify(node) {
-        const num2 = Number(node.value);
-        return isFinite(num2) ? num2.toExponential() : stringifyNumber.stringifyNumber(node);
+        const num = Number(node.value);
+        return isFinite(num) ? num.toExponential() : stringifyNumber.stringifyNumber(node);
       }
     };
     var float = {
-      identify: (value) => typeof value === "number",
+      identify: (value2) => typeof value2 === "number",
       default: true,
       tag: "tag:yaml.org,2002:float",
       test: /^[-+]?(?:[0-9][0-9_]*)?\.[0-9_]*$/,
@@ -10941,7 +10941,7 @@ var require_int2 = __commonJS({
   "node_modules/yaml/dist/schema/yaml-1.1/int.js"(exports) {
     "use strict";
     var stringifyNumber = require_stringifyNumber();
-    var intIdentify = (value) => typeof value === "bigint" || Number.isInteger(value);
+    var intIdentify = (value2) => typeof value2 === "bigint" || Number.isInteger(value2);
     function intResolve(str, offset, radix, { intAsBigInt }) {
       const sign = str[0];
       if (sign === "-" || sign === "+")
@@ -10966,10 +10966,10 @@ var require_int2 = __commonJS({
       return sign === "-" ? -1 * n : n;
     }
     function intStringify(node, radix, prefix) {
-      const { value } = node;
-      if (intIdentify(value)) {
-        const str = value.toString(radix);
-        return value < 0 ? "-" + prefix + str.substr(1) : prefix + str;
+      const { value: value2 } = node;
+      if (intIdentify(value2)) {
+        const str = value2.toString(radix);
+        return value2 < 0 ? "-" + prefix + str.substr(1) : prefix + str;
       }
       return stringifyNumber.stringifyNumber(node);
     }
@@ -11047,13 +11047,13 @@ var require_set = __commonJS({
         const pair = YAMLMap.findPair(this.items, key);
         return !keepPair && identity.isPair(pair) ? identity.isScalar(pair.key) ? pair.key.value : pair.key : pair;
       }
-      set(key, value) {
-        if (typeof value !== "boolean")
-          throw new Error(`Expected boolean value for set(key, value) in a YAML set, not ${typeof value}`);
+      set(key, value2) {
+        if (typeof value2 !== "boolean")
+          throw new Error(`Expected boolean value for set(key, value) in a YAML set, not ${typeof value2}`);
         const prev = YAMLMap.findPair(this.items, key);
-        if (prev && !value) {
+        if (prev && !value2) {
           this.items.splice(this.items.indexOf(prev), 1);
-        } else if (!prev && value) {
+        } else if (!prev && value2) {
           this.items.push(new Pair.Pair(key));
         }
       }
@@ -11072,10 +11072,10 @@ var require_set = __commonJS({
         const { replacer } = ctx;
         const set2 = new this(schema);
         if (iterable && Symbol.iterator in Object(iterable))
-          for (let value of iterable) {
+          for (let value2 of iterable) {
             if (typeof replacer === "function")
-              value = replacer.call(iterable, value, value);
-            set2.items.push(Pair.createPair(value, null, ctx));
+              value2 = replacer.call(iterable, value2, value2);
+            set2.items.push(Pair.createPair(value2, null, ctx));
           }
         return set2;
       }
@@ -11083,7 +11083,7 @@ var require_set = __commonJS({
     YAMLSet.tag = "tag:yaml.org,2002:set";
     var set = {
       collection: "map",
-      identify: (value) => value instanceof Set,
+      identify: (value2) => value2 instanceof Set,
       nodeClass: YAMLSet,
       default: false,
       tag: "tag:yaml.org,2002:set",
@@ -11112,38 +11112,38 @@ var require_timestamp = __commonJS({
     function parseSexagesimal(str, asBigInt) {
       const sign = str[0];
       const parts = sign === "-" || sign === "+" ? str.substring(1) : str;
-      const num2 = (n) => asBigInt ? BigInt(n) : Number(n);
-      const res = parts.replace(/_/g, "").split(":").reduce((res2, p) => res2 * num2(60) + num2(p), num2(0));
-      return sign === "-" ? num2(-1) * res : res;
+      const num = (n) => asBigInt ? BigInt(n) : Number(n);
+      const res = parts.replace(/_/g, "").split(":").reduce((res2, p) => res2 * num(60) + num(p), num(0));
+      return sign === "-" ? num(-1) * res : res;
     }
     function stringifySexagesimal(node) {
-      let { value } = node;
-      let num2 = (n) => n;
-      if (typeof value === "bigint")
-        num2 = (n) => BigInt(n);
-      else if (isNaN(value) || !isFinite(value))
+      let { value: value2 } = node;
+      let num = (n) => n;
+      if (typeof value2 === "bigint")
+        num = (n) => BigInt(n);
+      else if (isNaN(value2) || !isFinite(value2))
         return stringifyNumber.stringifyNumber(node);
       let sign = "";
-      if (value < 0) {
+      if (value2 < 0) {
         sign = "-";
-        value *= num2(-1);
+        value2 *= num(-1);
       }
-      const _60 = num2(60);
-      const parts = [value % _60];
-      if (value < 60) {
+      const _60 = num(60);
+      const parts = [value2 % _60];
+      if (value2 < 60) {
         parts.unshift(0);
       } else {
-        value = (value - parts[0]) / _60;
-        parts.unshift(value % _60);
-        if (value >= 60) {
-          value = (value - parts[0]) / _60;
-          parts.unshift(value);
+        value2 = (value2 - parts[0]) / _60;
+        parts.unshift(value2 % _60);
+        if (value2 >= 60) {
+          value2 = (value2 - parts[0]) / _60;
+          parts.unshift(value2);
         }
       }
       return sign + parts.map((n) => String(n).padStart(2, "0")).join(":").replace(/000000\d*$/, "");
     }
     var intTime = {
-      identify: (value) => typeof value === "bigint" || Number.isInteger(value),
+      identify: (value2) => typeof value2 === "bigint" || Number.isInteger(value2),
       default: true,
       tag: "tag:yaml.org,2002:int",
       format: "TIME",
@@ -11152,7 +11152,7 @@ var require_timestamp = __commonJS({
       stringify: stringifySexagesimal
     };
     var floatTime = {
-      identify: (value) => typeof value === "number",
+      identify: (value2) => typeof value2 === "number",
       default: true,
       tag: "tag:yaml.org,2002:float",
       format: "TIME",
@@ -11161,7 +11161,7 @@ var require_timestamp = __commonJS({
       stringify: stringifySexagesimal
     };
     var timestamp = {
-      identify: (value) => value instanceof Date,
+      identify: (value2) => value2 instanceof Date,
       default: true,
       tag: "tag:yaml.org,2002:timestamp",
       // If the time zone is omitted, the timestamp is assumed to be specified in UTC. The time part
@@ -11184,7 +11184,7 @@ var require_timestamp = __commonJS({
         }
         return new Date(date);
       },
-      stringify: ({ value }) => value?.toISOString().replace(/(T00:00:00)?\.000Z$/, "") ?? ""
+      stringify: ({ value: value2 }) => value2?.toISOString().replace(/(T00:00:00)?\.000Z$/, "") ?? ""
     };
     exports.floatTime = floatTime;
     exports.intTime = intTime;
@@ -11458,7 +11458,7 @@ var require_Document = __commonJS({
     var createNode = require_createNode();
     var directives = require_directives();
     var Document = class _Document {
-      constructor(value, replacer, options) {
+      constructor(value2, replacer, options) {
         this.commentBefore = null;
         this.comment = null;
         this.errors = [];
@@ -11490,7 +11490,7 @@ var require_Document = __commonJS({
         } else
           this.directives = new directives.Directives({ version: version2 });
         this.setSchema(version2, options);
-        this.contents = value === void 0 ? null : this.createNode(value, _replacer, options);
+        this.contents = value2 === void 0 ? null : this.createNode(value2, _replacer, options);
       }
       /**
        * Create a deep copy of this Document and its contents.
@@ -11515,14 +11515,14 @@ var require_Document = __commonJS({
         return copy;
       }
       /** Adds a value to the document. */
-      add(value) {
+      add(value2) {
         if (assertCollection(this.contents))
-          this.contents.add(value);
+          this.contents.add(value2);
       }
       /** Adds a value to the document. */
-      addIn(path, value) {
+      addIn(path, value2) {
         if (assertCollection(this.contents))
-          this.contents.addIn(path, value);
+          this.contents.addIn(path, value2);
       }
       /**
        * Create a new `Alias` node, ensuring that the target `node` has the required anchor.
@@ -11541,10 +11541,10 @@ var require_Document = __commonJS({
         }
         return new Alias.Alias(node.anchor);
       }
-      createNode(value, replacer, options) {
+      createNode(value2, replacer, options) {
         let _replacer = void 0;
         if (typeof replacer === "function") {
-          value = replacer.call({ "": value }, "", value);
+          value2 = replacer.call({ "": value2 }, "", value2);
           _replacer = replacer;
         } else if (Array.isArray(replacer)) {
           const keyToStr = (v) => typeof v === "number" || v instanceof String || v instanceof Number;
@@ -11571,7 +11571,7 @@ var require_Document = __commonJS({
           schema: this.schema,
           sourceObjects
         };
-        const node = createNode.createNode(value, tag, ctx);
+        const node = createNode.createNode(value2, tag, ctx);
         if (flow && identity.isCollection(node))
           node.flow = true;
         setAnchors();
@@ -11581,9 +11581,9 @@ var require_Document = __commonJS({
        * Convert a key and a value into a `Pair` using the current schema,
        * recursively wrapping all values as `Scalar` or `Collection` nodes.
        */
-      createPair(key, value, options = {}) {
+      createPair(key, value2, options = {}) {
         const k = this.createNode(key, null, options);
-        const v = this.createNode(value, null, options);
+        const v = this.createNode(value2, null, options);
         return new Pair.Pair(k, v);
       }
       /**
@@ -11642,24 +11642,24 @@ var require_Document = __commonJS({
        * Sets a value in this document. For `!!set`, `value` needs to be a
        * boolean to add/remove the item from the set.
        */
-      set(key, value) {
+      set(key, value2) {
         if (this.contents == null) {
-          this.contents = Collection.collectionFromPath(this.schema, [key], value);
+          this.contents = Collection.collectionFromPath(this.schema, [key], value2);
         } else if (assertCollection(this.contents)) {
-          this.contents.set(key, value);
+          this.contents.set(key, value2);
         }
       }
       /**
        * Sets a value in this document. For `!!set`, `value` needs to be a
        * boolean to add/remove the item from the set.
        */
-      setIn(path, value) {
+      setIn(path, value2) {
         if (Collection.isEmptyPath(path)) {
-          this.contents = value;
+          this.contents = value2;
         } else if (this.contents == null) {
-          this.contents = Collection.collectionFromPath(this.schema, Array.from(path), value);
+          this.contents = Collection.collectionFromPath(this.schema, Array.from(path), value2);
         } else if (assertCollection(this.contents)) {
-          this.contents.setIn(path, value);
+          this.contents.setIn(path, value2);
         }
       }
       /**
@@ -12015,12 +12015,12 @@ var require_util_map_includes = __commonJS({
   "node_modules/yaml/dist/compose/util-map-includes.js"(exports) {
     "use strict";
     var identity = require_identity();
-    function mapIncludes(ctx, items, search) {
+    function mapIncludes(ctx, items, search2) {
       const { uniqueKeys } = ctx.options;
       if (uniqueKeys === false)
         return false;
       const isEqual = typeof uniqueKeys === "function" ? uniqueKeys : (a, b) => a === b || identity.isScalar(a) && identity.isScalar(b) && a.value === b.value;
-      return items.some((pair) => isEqual(pair.key, search));
+      return items.some((pair) => isEqual(pair.key, search2));
     }
     exports.mapIncludes = mapIncludes;
   }
@@ -12045,10 +12045,10 @@ var require_resolve_block_map = __commonJS({
       let offset = bm.offset;
       let commentEnd = null;
       for (const collItem of bm.items) {
-        const { start, key, sep: sep2, value } = collItem;
+        const { start, key, sep: sep3, value: value2 } = collItem;
         const keyProps = resolveProps.resolveProps(start, {
           indicator: "explicit-key-ind",
-          next: key ?? sep2?.[0],
+          next: key ?? sep3?.[0],
           offset,
           onError,
           parentIndent: bm.indent,
@@ -12062,7 +12062,7 @@ var require_resolve_block_map = __commonJS({
             else if ("indent" in key && key.indent !== bm.indent)
               onError(offset, "BAD_INDENT", startColMsg);
           }
-          if (!keyProps.anchor && !keyProps.tag && !sep2) {
+          if (!keyProps.anchor && !keyProps.tag && !sep3) {
             commentEnd = keyProps.end;
             if (keyProps.comment) {
               if (map.comment)
@@ -12086,9 +12086,9 @@ var require_resolve_block_map = __commonJS({
         ctx.atKey = false;
         if (utilMapIncludes.mapIncludes(ctx, map.items, keyNode))
           onError(keyStart, "DUPLICATE_KEY", "Map keys must be unique");
-        const valueProps = resolveProps.resolveProps(sep2 ?? [], {
+        const valueProps = resolveProps.resolveProps(sep3 ?? [], {
           indicator: "map-value-ind",
-          next: value,
+          next: value2,
           offset: keyNode.range[2],
           onError,
           parentIndent: bm.indent,
@@ -12097,14 +12097,14 @@ var require_resolve_block_map = __commonJS({
         offset = valueProps.end;
         if (valueProps.found) {
           if (implicitKey) {
-            if (value?.type === "block-map" && !valueProps.hasNewline)
+            if (value2?.type === "block-map" && !valueProps.hasNewline)
               onError(offset, "BLOCK_AS_IMPLICIT_KEY", "Nested mappings are not allowed in compact mappings");
             if (ctx.options.strict && keyProps.start < valueProps.found.offset - 1024)
               onError(keyNode.range, "KEY_OVER_1024_CHARS", "The : indicator must be at most 1024 chars after the start of an implicit block mapping key");
           }
-          const valueNode = value ? composeNode(ctx, value, valueProps, onError) : composeEmptyNode(ctx, offset, sep2, null, valueProps, onError);
+          const valueNode = value2 ? composeNode(ctx, value2, valueProps, onError) : composeEmptyNode(ctx, offset, sep3, null, valueProps, onError);
           if (ctx.schema.compat)
-            utilFlowIndentCheck.flowIndentCheck(bm.indent, value, onError);
+            utilFlowIndentCheck.flowIndentCheck(bm.indent, value2, onError);
           offset = valueNode.range[2];
           const pair = new Pair.Pair(keyNode, valueNode);
           if (ctx.options.keepSourceTokens)
@@ -12150,18 +12150,18 @@ var require_resolve_block_seq = __commonJS({
         ctx.atKey = false;
       let offset = bs.offset;
       let commentEnd = null;
-      for (const { start, value } of bs.items) {
+      for (const { start, value: value2 } of bs.items) {
         const props = resolveProps.resolveProps(start, {
           indicator: "seq-item-ind",
-          next: value,
+          next: value2,
           offset,
           onError,
           parentIndent: bs.indent,
           startOnNewline: true
         });
         if (!props.found) {
-          if (props.anchor || props.tag || value) {
-            if (value?.type === "block-seq")
+          if (props.anchor || props.tag || value2) {
+            if (value2?.type === "block-seq")
               onError(props.end, "BAD_INDENT", "All sequence items must start at the same column");
             else
               onError(offset, "MISSING_CHAR", "Sequence item without - indicator");
@@ -12172,9 +12172,9 @@ var require_resolve_block_seq = __commonJS({
             continue;
           }
         }
-        const node = value ? composeNode(ctx, value, props, onError) : composeEmptyNode(ctx, props.end, start, null, props, onError);
+        const node = value2 ? composeNode(ctx, value2, props, onError) : composeEmptyNode(ctx, props.end, start, null, props, onError);
         if (ctx.schema.compat)
-          utilFlowIndentCheck.flowIndentCheck(bs.indent, value, onError);
+          utilFlowIndentCheck.flowIndentCheck(bs.indent, value2, onError);
         offset = node.range[2];
         seq.items.push(node);
       }
@@ -12193,7 +12193,7 @@ var require_resolve_end = __commonJS({
       let comment = "";
       if (end) {
         let hasSpace = false;
-        let sep2 = "";
+        let sep3 = "";
         for (const token of end) {
           const { source, type } = token;
           switch (type) {
@@ -12207,13 +12207,13 @@ var require_resolve_end = __commonJS({
               if (!comment)
                 comment = cb;
               else
-                comment += sep2 + cb;
-              sep2 = "";
+                comment += sep3 + cb;
+              sep3 = "";
               break;
             }
             case "newline":
               if (comment)
-                sep2 += source;
+                sep3 += source;
               hasSpace = true;
               break;
             default:
@@ -12256,18 +12256,18 @@ var require_resolve_flow_collection = __commonJS({
       let offset = fc.offset + fc.start.source.length;
       for (let i = 0; i < fc.items.length; ++i) {
         const collItem = fc.items[i];
-        const { start, key, sep: sep2, value } = collItem;
+        const { start, key, sep: sep3, value: value2 } = collItem;
         const props = resolveProps.resolveProps(start, {
           flow: fcName,
           indicator: "explicit-key-ind",
-          next: key ?? sep2?.[0],
+          next: key ?? sep3?.[0],
           offset,
           onError,
           parentIndent: fc.indent,
           startOnNewline: false
         });
         if (!props.found) {
-          if (!props.anchor && !props.tag && !sep2 && !value) {
+          if (!props.anchor && !props.tag && !sep3 && !value2) {
             if (i === 0 && props.comma)
               onError(props.comma, "UNEXPECTED_TOKEN", `Unexpected , in ${fcName}`);
             else if (i < fc.items.length - 1)
@@ -12321,11 +12321,11 @@ var require_resolve_flow_collection = __commonJS({
             }
           }
         }
-        if (!isMap && !sep2 && !props.found) {
-          const valueNode = value ? composeNode(ctx, value, props, onError) : composeEmptyNode(ctx, props.end, sep2, null, props, onError);
+        if (!isMap && !sep3 && !props.found) {
+          const valueNode = value2 ? composeNode(ctx, value2, props, onError) : composeEmptyNode(ctx, props.end, sep3, null, props, onError);
           coll.items.push(valueNode);
           offset = valueNode.range[2];
-          if (isBlock(value))
+          if (isBlock(value2))
             onError(valueNode.range, "BLOCK_IN_FLOW", blockMsg);
         } else {
           ctx.atKey = true;
@@ -12334,10 +12334,10 @@ var require_resolve_flow_collection = __commonJS({
           if (isBlock(key))
             onError(keyNode.range, "BLOCK_IN_FLOW", blockMsg);
           ctx.atKey = false;
-          const valueProps = resolveProps.resolveProps(sep2 ?? [], {
+          const valueProps = resolveProps.resolveProps(sep3 ?? [], {
             flow: fcName,
             indicator: "map-value-ind",
-            next: value,
+            next: value2,
             offset: keyNode.range[2],
             onError,
             parentIndent: fc.indent,
@@ -12345,8 +12345,8 @@ var require_resolve_flow_collection = __commonJS({
           });
           if (valueProps.found) {
             if (!isMap && !props.found && ctx.options.strict) {
-              if (sep2)
-                for (const st of sep2) {
+              if (sep3)
+                for (const st of sep3) {
                   if (st === valueProps.found)
                     break;
                   if (st.type === "newline") {
@@ -12357,15 +12357,15 @@ var require_resolve_flow_collection = __commonJS({
               if (props.start < valueProps.found.offset - 1024)
                 onError(valueProps.found, "KEY_OVER_1024_CHARS", "The : indicator must be at most 1024 chars after the start of an implicit flow sequence key");
             }
-          } else if (value) {
-            if ("source" in value && value.source?.[0] === ":")
-              onError(value, "MISSING_CHAR", `Missing space after : in ${fcName}`);
+          } else if (value2) {
+            if ("source" in value2 && value2.source?.[0] === ":")
+              onError(value2, "MISSING_CHAR", `Missing space after : in ${fcName}`);
             else
               onError(valueProps.start, "MISSING_CHAR", `Missing , or : between ${fcName} items`);
           }
-          const valueNode = value ? composeNode(ctx, value, valueProps, onError) : valueProps.found ? composeEmptyNode(ctx, valueProps.end, sep2, null, valueProps, onError) : null;
+          const valueNode = value2 ? composeNode(ctx, value2, valueProps, onError) : valueProps.found ? composeEmptyNode(ctx, valueProps.end, sep3, null, valueProps, onError) : null;
           if (valueNode) {
-            if (isBlock(value))
+            if (isBlock(value2))
               onError(valueNode.range, "BLOCK_IN_FLOW", blockMsg);
           } else if (valueProps.comment) {
             if (keyNode.comment)
@@ -12508,11 +12508,11 @@ var require_resolve_block_scalar = __commonJS({
           break;
       }
       if (chompStart === 0) {
-        const value2 = header.chomp === "+" && lines.length > 0 ? "\n".repeat(Math.max(1, lines.length - 1)) : "";
+        const value3 = header.chomp === "+" && lines.length > 0 ? "\n".repeat(Math.max(1, lines.length - 1)) : "";
         let end2 = start + header.length;
         if (scalar.source)
           end2 += scalar.source.length;
-        return { value: value2, type, comment: header.comment, range: [start, end2, end2] };
+        return { value: value3, type, comment: header.comment, range: [start, end2, end2] };
       }
       let trimIndent = scalar.indent + header.indent;
       let offset = scalar.offset + header.length;
@@ -12542,11 +12542,11 @@ var require_resolve_block_scalar = __commonJS({
         if (lines[i][0].length > trimIndent)
           chompStart = i + 1;
       }
-      let value = "";
-      let sep2 = "";
+      let value2 = "";
+      let sep3 = "";
       let prevMoreIndented = false;
       for (let i = 0; i < contentStart; ++i)
-        value += lines[i][0].slice(trimIndent) + "\n";
+        value2 += lines[i][0].slice(trimIndent) + "\n";
       for (let i = contentStart; i < chompStart; ++i) {
         let [indent, content] = lines[i];
         offset += indent.length + content.length + 1;
@@ -12560,24 +12560,24 @@ var require_resolve_block_scalar = __commonJS({
           indent = "";
         }
         if (type === Scalar.Scalar.BLOCK_LITERAL) {
-          value += sep2 + indent.slice(trimIndent) + content;
-          sep2 = "\n";
+          value2 += sep3 + indent.slice(trimIndent) + content;
+          sep3 = "\n";
         } else if (indent.length > trimIndent || content[0] === "	") {
-          if (sep2 === " ")
-            sep2 = "\n";
-          else if (!prevMoreIndented && sep2 === "\n")
-            sep2 = "\n\n";
-          value += sep2 + indent.slice(trimIndent) + content;
-          sep2 = "\n";
+          if (sep3 === " ")
+            sep3 = "\n";
+          else if (!prevMoreIndented && sep3 === "\n")
+            sep3 = "\n\n";
+          value2 += sep3 + indent.slice(trimIndent) + content;
+          sep3 = "\n";
           prevMoreIndented = true;
         } else if (content === "") {
-          if (sep2 === "\n")
-            value += "\n";
+          if (sep3 === "\n")
+            value2 += "\n";
           else
-            sep2 = "\n";
+            sep3 = "\n";
         } else {
-          value += sep2 + content;
-          sep2 = " ";
+          value2 += sep3 + content;
+          sep3 = " ";
           prevMoreIndented = false;
         }
       }
@@ -12586,15 +12586,15 @@ var require_resolve_block_scalar = __commonJS({
           break;
         case "+":
           for (let i = chompStart; i < lines.length; ++i)
-            value += "\n" + lines[i][0].slice(trimIndent);
-          if (value[value.length - 1] !== "\n")
-            value += "\n";
+            value2 += "\n" + lines[i][0].slice(trimIndent);
+          if (value2[value2.length - 1] !== "\n")
+            value2 += "\n";
           break;
         default:
-          value += "\n";
+          value2 += "\n";
       }
       const end = start + header.length + scalar.source.length;
-      return { value, type, comment: header.comment, range: [start, end, end] };
+      return { value: value2, type, comment: header.comment, range: [start, end, end] };
     }
     function parseBlockScalarHeader({ offset, props }, strict, onError) {
       if (props[0].type !== "block-scalar-header") {
@@ -12679,20 +12679,20 @@ var require_resolve_flow_scalar = __commonJS({
     function resolveFlowScalar(scalar, strict, onError) {
       const { offset, type, source, end } = scalar;
       let _type;
-      let value;
+      let value2;
       const _onError = (rel, code, msg) => onError(offset + rel, code, msg);
       switch (type) {
         case "scalar":
           _type = Scalar.Scalar.PLAIN;
-          value = plainValue(source, _onError);
+          value2 = plainValue(source, _onError);
           break;
         case "single-quoted-scalar":
           _type = Scalar.Scalar.QUOTE_SINGLE;
-          value = singleQuotedValue(source, _onError);
+          value2 = singleQuotedValue(source, _onError);
           break;
         case "double-quoted-scalar":
           _type = Scalar.Scalar.QUOTE_DOUBLE;
-          value = doubleQuotedValue(source, _onError);
+          value2 = doubleQuotedValue(source, _onError);
           break;
         /* istanbul ignore next should not happen */
         default:
@@ -12707,7 +12707,7 @@ var require_resolve_flow_scalar = __commonJS({
       const valueEnd = offset + source.length;
       const re = resolveEnd.resolveEnd(end, valueEnd, strict, onError);
       return {
-        value,
+        value: value2,
         type: _type,
         comment: re.comment,
         range: [offset, valueEnd, re.offset]
@@ -12760,25 +12760,25 @@ var require_resolve_flow_scalar = __commonJS({
         trimBoth = /^[ \t]+|[ \t]+$/g;
       }
       let res = match[1].replace(trimEnd, "");
-      let sep2 = " ";
+      let sep3 = " ";
       let pos = line.lastIndex;
       while (match = line.exec(source)) {
         const lm = match[1].replace(trimBoth, "");
         if (lm === "") {
-          if (sep2 === "\n")
-            res += sep2;
+          if (sep3 === "\n")
+            res += sep3;
           else
-            sep2 = "\n";
+            sep3 = "\n";
         } else {
-          res += sep2 + lm;
-          sep2 = " ";
+          res += sep3 + lm;
+          sep3 = " ";
         }
         pos = line.lastIndex;
       }
       const last = /[ \t]*(.*)/sy;
       last.lastIndex = pos;
       match = last.exec(source);
-      return res + sep2 + (match?.[1] ?? "");
+      return res + sep3 + (match?.[1] ?? "");
     }
     function doubleQuotedValue(source, onError) {
       let res = "";
@@ -12900,28 +12900,28 @@ var require_compose_scalar = __commonJS({
     var resolveBlockScalar = require_resolve_block_scalar();
     var resolveFlowScalar = require_resolve_flow_scalar();
     function composeScalar(ctx, token, tagToken, onError) {
-      const { value, type, comment, range } = token.type === "block-scalar" ? resolveBlockScalar.resolveBlockScalar(ctx, token, onError) : resolveFlowScalar.resolveFlowScalar(token, ctx.options.strict, onError);
+      const { value: value2, type, comment, range } = token.type === "block-scalar" ? resolveBlockScalar.resolveBlockScalar(ctx, token, onError) : resolveFlowScalar.resolveFlowScalar(token, ctx.options.strict, onError);
       const tagName = tagToken ? ctx.directives.tagName(tagToken.source, (msg) => onError(tagToken, "TAG_RESOLVE_FAILED", msg)) : null;
       let tag;
       if (ctx.options.stringKeys && ctx.atKey) {
         tag = ctx.schema[identity.SCALAR];
       } else if (tagName)
-        tag = findScalarTagByName(ctx.schema, value, tagName, tagToken, onError);
+        tag = findScalarTagByName(ctx.schema, value2, tagName, tagToken, onError);
       else if (token.type === "scalar")
-        tag = findScalarTagByTest(ctx, value, token, onError);
+        tag = findScalarTagByTest(ctx, value2, token, onError);
       else
         tag = ctx.schema[identity.SCALAR];
       let scalar;
       try {
-        const res = tag.resolve(value, (msg) => onError(tagToken ?? token, "TAG_RESOLVE_FAILED", msg), ctx.options);
+        const res = tag.resolve(value2, (msg) => onError(tagToken ?? token, "TAG_RESOLVE_FAILED", msg), ctx.options);
         scalar = identity.isScalar(res) ? res : new Scalar.Scalar(res);
       } catch (error) {
         const msg = error instanceof Error ? error.message : String(error);
         onError(tagToken ?? token, "TAG_RESOLVE_FAILED", msg);
-        scalar = new Scalar.Scalar(value);
+        scalar = new Scalar.Scalar(value2);
       }
       scalar.range = range;
-      scalar.source = value;
+      scalar.source = value2;
       if (type)
         scalar.type = type;
       if (tagName)
@@ -12932,7 +12932,7 @@ var require_compose_scalar = __commonJS({
         scalar.comment = comment;
       return scalar;
     }
-    function findScalarTagByName(schema, value, tagName, tagToken, onError) {
+    function findScalarTagByName(schema, value2, tagName, tagToken, onError) {
       if (tagName === "!")
         return schema[identity.SCALAR];
       const matchWithTest = [];
@@ -12945,7 +12945,7 @@ var require_compose_scalar = __commonJS({
         }
       }
       for (const tag of matchWithTest)
-        if (tag.test?.test(value))
+        if (tag.test?.test(value2))
           return tag;
       const kt = schema.knownTags[tagName];
       if (kt && !kt.collection) {
@@ -12955,10 +12955,10 @@ var require_compose_scalar = __commonJS({
       onError(tagToken, "TAG_RESOLVE_FAILED", `Unresolved tag: ${tagName}`, tagName !== "tag:yaml.org,2002:str");
       return schema[identity.SCALAR];
     }
-    function findScalarTagByTest({ atKey, directives, schema }, value, token, onError) {
-      const tag = schema.tags.find((tag2) => (tag2.default === true || atKey && tag2.default === "key") && tag2.test?.test(value)) || schema[identity.SCALAR];
+    function findScalarTagByTest({ atKey, directives, schema }, value2, token, onError) {
+      const tag = schema.tags.find((tag2) => (tag2.default === true || atKey && tag2.default === "key") && tag2.test?.test(value2)) || schema[identity.SCALAR];
       if (schema.compat) {
-        const compat = schema.compat.find((tag2) => tag2.default && tag2.test?.test(value)) ?? schema[identity.SCALAR];
+        const compat = schema.compat.find((tag2) => tag2.default && tag2.test?.test(value2)) ?? schema[identity.SCALAR];
         if (tag.tag !== compat.tag) {
           const ts = directives.tagString(tag.tag);
           const cs = directives.tagString(compat.tag);
@@ -13116,7 +13116,7 @@ var require_compose_doc = __commonJS({
     var composeNode = require_compose_node();
     var resolveEnd = require_resolve_end();
     var resolveProps = require_resolve_props();
-    function composeDoc(options, directives, { offset, start, value, end }, onError) {
+    function composeDoc(options, directives, { offset, start, value: value2, end }, onError) {
       const opts = Object.assign({ _directives: directives }, options);
       const doc = new Document.Document(void 0, opts);
       const ctx = {
@@ -13128,7 +13128,7 @@ var require_compose_doc = __commonJS({
       };
       const props = resolveProps.resolveProps(start, {
         indicator: "doc-start",
-        next: value ?? end?.[0],
+        next: value2 ?? end?.[0],
         offset,
         onError,
         parentIndent: 0,
@@ -13136,10 +13136,10 @@ var require_compose_doc = __commonJS({
       });
       if (props.found) {
         doc.directives.docStart = true;
-        if (value && (value.type === "block-map" || value.type === "block-seq") && !props.hasNewline)
+        if (value2 && (value2.type === "block-map" || value2.type === "block-seq") && !props.hasNewline)
           onError(props.end, "MISSING_CHAR", "Block collection cannot start on same line with directives-end marker");
       }
-      doc.contents = value ? composeNode.composeNode(ctx, value, props, onError) : composeNode.composeEmptyNode(ctx, props.end, start, null, props, onError);
+      doc.contents = value2 ? composeNode.composeNode(ctx, value2, props, onError) : composeNode.composeEmptyNode(ctx, props.end, start, null, props, onError);
       const contentEnd = doc.contents.range[2];
       const re = resolveEnd.resolveEnd(end, contentEnd, false, onError);
       if (re.comment)
@@ -13387,9 +13387,9 @@ var require_cst_scalar = __commonJS({
       }
       return null;
     }
-    function createScalarToken(value, context) {
+    function createScalarToken(value2, context) {
       const { implicitKey = false, indent, inFlow = false, offset = -1, type = "PLAIN" } = context;
-      const source = stringifyString.stringifyString({ type, value }, {
+      const source = stringifyString.stringifyString({ type, value: value2 }, {
         implicitKey,
         indent: indent > 0 ? " ".repeat(indent) : "",
         inFlow,
@@ -13419,7 +13419,7 @@ var require_cst_scalar = __commonJS({
           return { type: "scalar", offset, indent, source, end };
       }
     }
-    function setScalarValue(token, value, context = {}) {
+    function setScalarValue(token, value2, context = {}) {
       let { afterKey = false, implicitKey = false, inFlow = false, type } = context;
       let indent = "indent" in token ? token.indent : null;
       if (afterKey && typeof indent === "number")
@@ -13442,7 +13442,7 @@ var require_cst_scalar = __commonJS({
           default:
             type = "PLAIN";
         }
-      const source = stringifyString.stringifyString({ type, value }, {
+      const source = stringifyString.stringifyString({ type, value: value2 }, {
         implicitKey: implicitKey || indent === null,
         indent: indent !== null && indent > 0 ? " ".repeat(indent) : "",
         inFlow,
@@ -13588,17 +13588,17 @@ var require_cst_stringify = __commonJS({
         }
       }
     }
-    function stringifyItem({ start, key, sep: sep2, value }) {
+    function stringifyItem({ start, key, sep: sep3, value: value2 }) {
       let res = "";
       for (const st of start)
         res += st.source;
       if (key)
         res += stringifyToken(key);
-      if (sep2)
-        for (const st of sep2)
+      if (sep3)
+        for (const st of sep3)
           res += st.source;
-      if (value)
-        res += stringifyToken(value);
+      if (value2)
+        res += stringifyToken(value2);
       return res;
     }
     exports.stringify = stringify;
@@ -14346,10 +14346,10 @@ var require_lexer = __commonJS({
         }
         return n;
       }
-      *pushUntil(test) {
+      *pushUntil(test2) {
         let i = this.pos;
         let ch = this.buffer[i];
-        while (!test(ch))
+        while (!test2(ch))
           ch = this.buffer[++i];
         return yield* this.pushToIndex(i, false);
       }
@@ -14762,18 +14762,18 @@ var require_parser = __commonJS({
         if (this.type === "map-value-ind") {
           const prev = getPrevProps(this.peek(2));
           const start = getFirstKeyStartProps(prev);
-          let sep2;
+          let sep3;
           if (scalar.end) {
-            sep2 = scalar.end;
-            sep2.push(this.sourceToken);
+            sep3 = scalar.end;
+            sep3.push(this.sourceToken);
             delete scalar.end;
           } else
-            sep2 = [this.sourceToken];
+            sep3 = [this.sourceToken];
           const map = {
             type: "block-map",
             offset: scalar.offset,
             indent: scalar.indent,
-            items: [{ start, key: scalar, sep: sep2 }]
+            items: [{ start, key: scalar, sep: sep3 }]
           };
           this.onKeyLine = true;
           this.stack[this.stack.length - 1] = map;
@@ -14926,15 +14926,15 @@ var require_parser = __commonJS({
                 } else if (isFlowToken(it.key) && !includesToken(it.sep, "newline")) {
                   const start2 = getFirstKeyStartProps(it.start);
                   const key = it.key;
-                  const sep2 = it.sep;
-                  sep2.push(this.sourceToken);
+                  const sep3 = it.sep;
+                  sep3.push(this.sourceToken);
                   delete it.key;
                   delete it.sep;
                   this.stack.push({
                     type: "block-map",
                     offset: this.offset,
                     indent: this.indent,
-                    items: [{ start: start2, key, sep: sep2 }]
+                    items: [{ start: start2, key, sep: sep3 }]
                   });
                 } else if (start.length > 0) {
                   it.sep = it.sep.concat(start, this.sourceToken);
@@ -15128,13 +15128,13 @@ var require_parser = __commonJS({
             const prev = getPrevProps(parent);
             const start = getFirstKeyStartProps(prev);
             fixFlowSeqItems(fc);
-            const sep2 = fc.end.splice(1, fc.end.length);
-            sep2.push(this.sourceToken);
+            const sep3 = fc.end.splice(1, fc.end.length);
+            sep3.push(this.sourceToken);
             const map = {
               type: "block-map",
               offset: fc.offset,
               indent: fc.indent,
-              items: [{ start, key: fc, sep: sep2 }]
+              items: [{ start, key: fc, sep: sep3 }]
             };
             this.onKeyLine = true;
             this.stack[this.stack.length - 1] = map;
@@ -15331,7 +15331,7 @@ var require_public_api = __commonJS({
       }
       return doc.toJS(Object.assign({ reviver: _reviver }, options));
     }
-    function stringify(value, replacer, options) {
+    function stringify(value2, replacer, options) {
       let _replacer = null;
       if (typeof replacer === "function" || Array.isArray(replacer)) {
         _replacer = replacer;
@@ -15344,14 +15344,14 @@ var require_public_api = __commonJS({
         const indent = Math.round(options);
         options = indent < 1 ? void 0 : indent > 8 ? { indent: 8 } : { indent };
       }
-      if (value === void 0) {
+      if (value2 === void 0) {
         const { keepUndefined } = options ?? replacer ?? {};
         if (!keepUndefined)
           return void 0;
       }
-      if (identity.isDocument(value) && !_replacer)
-        return value.toString(options);
-      return new Document.Document(value, _replacer, options).toString(options);
+      if (identity.isDocument(value2) && !_replacer)
+        return value2.toString(options);
+      return new Document.Document(value2, _replacer, options).toString(options);
     }
     exports.parse = parse;
     exports.parseAllDocuments = parseAllDocuments;
@@ -15424,7 +15424,7 @@ var require_jstat = __commonJS({
         window.jStat = factory();
       }
     })(exports, function() {
-      var jStat2 = (function(Math2, undefined2) {
+      var jStat3 = (function(Math2, undefined2) {
         var concat = Array.prototype.concat;
         var slice = Array.prototype.slice;
         var toString = Object.prototype.toString;
@@ -15441,59 +15441,59 @@ var require_jstat = __commonJS({
         function isFunction(arg) {
           return toString.call(arg) === "[object Function]";
         }
-        function isNumber(num2) {
-          return typeof num2 === "number" ? num2 - num2 === 0 : false;
+        function isNumber(num) {
+          return typeof num === "number" ? num - num === 0 : false;
         }
         function toVector(arr) {
           return concat.apply([], arr);
         }
-        function jStat3() {
-          return new jStat3._init(arguments);
+        function jStat4() {
+          return new jStat4._init(arguments);
         }
-        jStat3.fn = jStat3.prototype;
-        jStat3._init = function _init(args) {
+        jStat4.fn = jStat4.prototype;
+        jStat4._init = function _init(args) {
           if (isArray(args[0])) {
             if (isArray(args[0][0])) {
               if (isFunction(args[1]))
-                args[0] = jStat3.map(args[0], args[1]);
+                args[0] = jStat4.map(args[0], args[1]);
               for (var i = 0; i < args[0].length; i++)
                 this[i] = args[0][i];
               this.length = args[0].length;
             } else {
-              this[0] = isFunction(args[1]) ? jStat3.map(args[0], args[1]) : args[0];
+              this[0] = isFunction(args[1]) ? jStat4.map(args[0], args[1]) : args[0];
               this.length = 1;
             }
           } else if (isNumber(args[0])) {
-            this[0] = jStat3.seq.apply(null, args);
+            this[0] = jStat4.seq.apply(null, args);
             this.length = 1;
-          } else if (args[0] instanceof jStat3) {
-            return jStat3(args[0].toArray());
+          } else if (args[0] instanceof jStat4) {
+            return jStat4(args[0].toArray());
           } else {
             this[0] = [];
             this.length = 1;
           }
           return this;
         };
-        jStat3._init.prototype = jStat3.prototype;
-        jStat3._init.constructor = jStat3;
-        jStat3.utils = {
+        jStat4._init.prototype = jStat4.prototype;
+        jStat4._init.constructor = jStat4;
+        jStat4.utils = {
           calcRdx,
           isArray,
           isFunction,
           isNumber,
           toVector
         };
-        jStat3._random_fn = Math2.random;
-        jStat3.setRandom = function setRandom(fn) {
+        jStat4._random_fn = Math2.random;
+        jStat4.setRandom = function setRandom(fn) {
           if (typeof fn !== "function")
             throw new TypeError("fn is not a function");
-          jStat3._random_fn = fn;
+          jStat4._random_fn = fn;
         };
-        jStat3.extend = function extend(obj) {
+        jStat4.extend = function extend(obj) {
           var i, j;
           if (arguments.length === 1) {
             for (j in obj)
-              jStat3[j] = obj[j];
+              jStat4[j] = obj[j];
             return this;
           }
           for (i = 1; i < arguments.length; i++) {
@@ -15502,36 +15502,36 @@ var require_jstat = __commonJS({
           }
           return obj;
         };
-        jStat3.rows = function rows(arr) {
+        jStat4.rows = function rows(arr) {
           return arr.length || 1;
         };
-        jStat3.cols = function cols(arr) {
+        jStat4.cols = function cols(arr) {
           return arr[0].length || 1;
         };
-        jStat3.dimensions = function dimensions(arr) {
+        jStat4.dimensions = function dimensions(arr) {
           return {
-            rows: jStat3.rows(arr),
-            cols: jStat3.cols(arr)
+            rows: jStat4.rows(arr),
+            cols: jStat4.cols(arr)
           };
         };
-        jStat3.row = function row(arr, index) {
+        jStat4.row = function row(arr, index) {
           if (isArray(index)) {
             return index.map(function(i) {
-              return jStat3.row(arr, i);
+              return jStat4.row(arr, i);
             });
           }
           return arr[index];
         };
-        jStat3.rowa = function rowa(arr, i) {
-          return jStat3.row(arr, i);
+        jStat4.rowa = function rowa(arr, i) {
+          return jStat4.row(arr, i);
         };
-        jStat3.col = function col(arr, index) {
+        jStat4.col = function col(arr, index) {
           if (isArray(index)) {
-            var submat = jStat3.arange(arr.length).map(function() {
+            var submat = jStat4.arange(arr.length).map(function() {
               return new Array(index.length);
             });
             index.forEach(function(ind, i2) {
-              jStat3.arange(arr.length).forEach(function(j) {
+              jStat4.arange(arr.length).forEach(function(j) {
                 submat[j][i2] = arr[j][ind];
               });
             });
@@ -15542,26 +15542,26 @@ var require_jstat = __commonJS({
             column[i] = [arr[i][index]];
           return column;
         };
-        jStat3.cola = function cola(arr, i) {
-          return jStat3.col(arr, i).map(function(a) {
+        jStat4.cola = function cola(arr, i) {
+          return jStat4.col(arr, i).map(function(a) {
             return a[0];
           });
         };
-        jStat3.diag = function diag(arr) {
-          var nrow = jStat3.rows(arr);
+        jStat4.diag = function diag(arr) {
+          var nrow = jStat4.rows(arr);
           var res = new Array(nrow);
           for (var row = 0; row < nrow; row++)
             res[row] = [arr[row][row]];
           return res;
         };
-        jStat3.antidiag = function antidiag(arr) {
-          var nrow = jStat3.rows(arr) - 1;
+        jStat4.antidiag = function antidiag(arr) {
+          var nrow = jStat4.rows(arr) - 1;
           var res = new Array(nrow);
           for (var i = 0; nrow >= 0; nrow--, i++)
             res[i] = [arr[i][nrow]];
           return res;
         };
-        jStat3.transpose = function transpose(arr) {
+        jStat4.transpose = function transpose(arr) {
           var obj = [];
           var objArr, rows, cols, j, i;
           if (!isArray(arr[0]))
@@ -15576,7 +15576,7 @@ var require_jstat = __commonJS({
           }
           return obj.length === 1 ? obj[0] : obj;
         };
-        jStat3.map = function map(arr, func, toAlter) {
+        jStat4.map = function map(arr, func, toAlter) {
           var row, nrow, ncol, res, col;
           if (!isArray(arr[0]))
             arr = [arr];
@@ -15591,7 +15591,7 @@ var require_jstat = __commonJS({
           }
           return res.length === 1 ? res[0] : res;
         };
-        jStat3.cumreduce = function cumreduce(arr, func, toAlter) {
+        jStat4.cumreduce = function cumreduce(arr, func, toAlter) {
           var row, nrow, ncol, res, col;
           if (!isArray(arr[0]))
             arr = [arr];
@@ -15608,10 +15608,10 @@ var require_jstat = __commonJS({
           }
           return res.length === 1 ? res[0] : res;
         };
-        jStat3.alter = function alter(arr, func) {
-          return jStat3.map(arr, func, true);
+        jStat4.alter = function alter(arr, func) {
+          return jStat4.map(arr, func, true);
         };
-        jStat3.create = function create(rows, cols, func) {
+        jStat4.create = function create(rows, cols, func) {
           var res = new Array(rows);
           var i, j;
           if (isFunction(cols)) {
@@ -15628,33 +15628,33 @@ var require_jstat = __commonJS({
         function retZero() {
           return 0;
         }
-        jStat3.zeros = function zeros(rows, cols) {
+        jStat4.zeros = function zeros(rows, cols) {
           if (!isNumber(cols))
             cols = rows;
-          return jStat3.create(rows, cols, retZero);
+          return jStat4.create(rows, cols, retZero);
         };
         function retOne() {
           return 1;
         }
-        jStat3.ones = function ones(rows, cols) {
+        jStat4.ones = function ones(rows, cols) {
           if (!isNumber(cols))
             cols = rows;
-          return jStat3.create(rows, cols, retOne);
+          return jStat4.create(rows, cols, retOne);
         };
-        jStat3.rand = function rand(rows, cols) {
+        jStat4.rand = function rand(rows, cols) {
           if (!isNumber(cols))
             cols = rows;
-          return jStat3.create(rows, cols, jStat3._random_fn);
+          return jStat4.create(rows, cols, jStat4._random_fn);
         };
         function retIdent(i, j) {
           return i === j ? 1 : 0;
         }
-        jStat3.identity = function identity(rows, cols) {
+        jStat4.identity = function identity(rows, cols) {
           if (!isNumber(cols))
             cols = rows;
-          return jStat3.create(rows, cols, retIdent);
+          return jStat4.create(rows, cols, retIdent);
         };
-        jStat3.symmetric = function symmetric(arr) {
+        jStat4.symmetric = function symmetric(arr) {
           var size = arr.length;
           var row, col;
           if (arr.length !== arr[0].length)
@@ -15666,10 +15666,10 @@ var require_jstat = __commonJS({
           }
           return true;
         };
-        jStat3.clear = function clear(arr) {
-          return jStat3.alter(arr, retZero);
+        jStat4.clear = function clear(arr) {
+          return jStat4.alter(arr, retZero);
         };
-        jStat3.seq = function seq(min, max, length, func) {
+        jStat4.seq = function seq(min, max, length, func) {
           if (!isFunction(func))
             func = false;
           var arr = [];
@@ -15682,7 +15682,7 @@ var require_jstat = __commonJS({
           }
           return arr;
         };
-        jStat3.arange = function arange(start, end, step) {
+        jStat4.arange = function arange(start, end, step) {
           var rl = [];
           var i;
           step = step || 1;
@@ -15710,13 +15710,13 @@ var require_jstat = __commonJS({
           }
           return rl;
         };
-        jStat3.slice = /* @__PURE__ */ (function() {
+        jStat4.slice = /* @__PURE__ */ (function() {
           function _slice(list, start, end, step) {
             var i;
             var rl = [];
             var length = list.length;
             if (start === undefined2 && end === undefined2 && step === undefined2) {
-              return jStat3.copy(list);
+              return jStat4.copy(list);
             }
             start = start || 0;
             end = end || list.length;
@@ -15749,12 +15749,12 @@ var require_jstat = __commonJS({
             if (isNumber(rcSlice.row)) {
               if (isNumber(rcSlice.col))
                 return list[rcSlice.row][rcSlice.col];
-              var row = jStat3.rowa(list, rcSlice.row);
+              var row = jStat4.rowa(list, rcSlice.row);
               colSlice = rcSlice.col || {};
               return _slice(row, colSlice.start, colSlice.end, colSlice.step);
             }
             if (isNumber(rcSlice.col)) {
-              var col = jStat3.cola(list, rcSlice.col);
+              var col = jStat4.cola(list, rcSlice.col);
               rowSlice = rcSlice.row || {};
               return _slice(col, rowSlice.start, rowSlice.end, rowSlice.step);
             }
@@ -15767,7 +15767,7 @@ var require_jstat = __commonJS({
           }
           return slice2;
         })();
-        jStat3.sliceAssign = function sliceAssign(A, rcSlice, B) {
+        jStat4.sliceAssign = function sliceAssign(A, rcSlice, B) {
           var nl, ml;
           if (isNumber(rcSlice.row)) {
             if (isNumber(rcSlice.col))
@@ -15776,7 +15776,7 @@ var require_jstat = __commonJS({
             rcSlice.col.start = rcSlice.col.start || 0;
             rcSlice.col.end = rcSlice.col.end || A[0].length;
             rcSlice.col.step = rcSlice.col.step || 1;
-            nl = jStat3.arange(
+            nl = jStat4.arange(
               rcSlice.col.start,
               Math2.min(A.length, rcSlice.col.end),
               rcSlice.col.step
@@ -15792,7 +15792,7 @@ var require_jstat = __commonJS({
             rcSlice.row.start = rcSlice.row.start || 0;
             rcSlice.row.end = rcSlice.row.end || A.length;
             rcSlice.row.step = rcSlice.row.step || 1;
-            ml = jStat3.arange(
+            ml = jStat4.arange(
               rcSlice.row.start,
               Math2.min(A[0].length, rcSlice.row.end),
               rcSlice.row.step
@@ -15812,12 +15812,12 @@ var require_jstat = __commonJS({
           rcSlice.col.start = rcSlice.col.start || 0;
           rcSlice.col.end = rcSlice.col.end || A[0].length;
           rcSlice.col.step = rcSlice.col.step || 1;
-          ml = jStat3.arange(
+          ml = jStat4.arange(
             rcSlice.row.start,
             Math2.min(A.length, rcSlice.row.end),
             rcSlice.row.step
           );
-          nl = jStat3.arange(
+          nl = jStat4.arange(
             rcSlice.col.start,
             Math2.min(A[0].length, rcSlice.col.end),
             rcSlice.col.step
@@ -15829,14 +15829,14 @@ var require_jstat = __commonJS({
           });
           return A;
         };
-        jStat3.diagonal = function diagonal(diagArray) {
-          var mat = jStat3.zeros(diagArray.length, diagArray.length);
+        jStat4.diagonal = function diagonal(diagArray) {
+          var mat = jStat4.zeros(diagArray.length, diagArray.length);
           diagArray.forEach(function(t, i) {
             mat[i][i] = t;
           });
           return mat;
         };
-        jStat3.copy = function copy(A) {
+        jStat4.copy = function copy(A) {
           return A.map(function(row) {
             if (isNumber(row))
               return row;
@@ -15845,7 +15845,7 @@ var require_jstat = __commonJS({
             });
           });
         };
-        var jProto = jStat3.prototype;
+        var jProto = jStat4.prototype;
         jProto.length = 0;
         jProto.push = Array.prototype.push;
         jProto.sort = Array.prototype.sort;
@@ -15855,13 +15855,13 @@ var require_jstat = __commonJS({
           return this.length > 1 ? slice.call(this) : slice.call(this)[0];
         };
         jProto.map = function map(func, toAlter) {
-          return jStat3(jStat3.map(this, func, toAlter));
+          return jStat4(jStat4.map(this, func, toAlter));
         };
         jProto.cumreduce = function cumreduce(func, toAlter) {
-          return jStat3(jStat3.cumreduce(this, func, toAlter));
+          return jStat4(jStat4.cumreduce(this, func, toAlter));
         };
         jProto.alter = function alter(func) {
-          jStat3.alter(this, func);
+          jStat4.alter(this, func);
           return this;
         };
         (function(funcs) {
@@ -15874,8 +15874,8 @@ var require_jstat = __commonJS({
                 });
                 return this;
               }
-              results = jStat3[passfunc](this);
-              return isArray(results) ? jStat3(results) : results;
+              results = jStat4[passfunc](this);
+              return isArray(results) ? jStat4(results) : results;
             };
           })(funcs[i]);
         })("transpose clear symmetric rows cols dimensions diag antidiag".split(" "));
@@ -15889,43 +15889,43 @@ var require_jstat = __commonJS({
                 });
                 return this;
               }
-              return jStat3(jStat3[passfunc](this, index));
+              return jStat4(jStat4[passfunc](this, index));
             };
           })(funcs[i]);
         })("row col".split(" "));
         (function(funcs) {
           for (var i = 0; i < funcs.length; i++) (function(passfunc) {
             jProto[passfunc] = function() {
-              return jStat3(jStat3[passfunc].apply(null, arguments));
+              return jStat4(jStat4[passfunc].apply(null, arguments));
             };
           })(funcs[i]);
         })("create zeros ones rand identity".split(" "));
-        return jStat3;
+        return jStat4;
       })(Math);
-      (function(jStat3, Math2) {
-        var isFunction = jStat3.utils.isFunction;
+      (function(jStat4, Math2) {
+        var isFunction = jStat4.utils.isFunction;
         function ascNum(a, b) {
           return a - b;
         }
         function clip(arg, min, max) {
           return Math2.max(min, Math2.min(arg, max));
         }
-        jStat3.sum = function sum(arr) {
+        jStat4.sum = function sum(arr) {
           var sum2 = 0;
           var i = arr.length;
           while (--i >= 0)
             sum2 += arr[i];
           return sum2;
         };
-        jStat3.sumsqrd = function sumsqrd(arr) {
+        jStat4.sumsqrd = function sumsqrd(arr) {
           var sum = 0;
           var i = arr.length;
           while (--i >= 0)
             sum += arr[i] * arr[i];
           return sum;
         };
-        jStat3.sumsqerr = function sumsqerr(arr) {
-          var mean2 = jStat3.mean(arr);
+        jStat4.sumsqerr = function sumsqerr(arr) {
+          var mean2 = jStat4.mean(arr);
           var sum = 0;
           var i = arr.length;
           var tmp;
@@ -15935,21 +15935,21 @@ var require_jstat = __commonJS({
           }
           return sum;
         };
-        jStat3.sumrow = function sumrow(arr) {
+        jStat4.sumrow = function sumrow(arr) {
           var sum = 0;
           var i = arr.length;
           while (--i >= 0)
             sum += arr[i];
           return sum;
         };
-        jStat3.product = function product(arr) {
+        jStat4.product = function product(arr) {
           var prod = 1;
           var i = arr.length;
           while (--i >= 0)
             prod *= arr[i];
           return prod;
         };
-        jStat3.min = function min(arr) {
+        jStat4.min = function min(arr) {
           var low = arr[0];
           var i = 0;
           while (++i < arr.length)
@@ -15957,7 +15957,7 @@ var require_jstat = __commonJS({
               low = arr[i];
           return low;
         };
-        jStat3.max = function max(arr) {
+        jStat4.max = function max(arr) {
           var high = arr[0];
           var i = 0;
           while (++i < arr.length)
@@ -15965,7 +15965,7 @@ var require_jstat = __commonJS({
               high = arr[i];
           return high;
         };
-        jStat3.unique = function unique(arr) {
+        jStat4.unique = function unique(arr) {
           var hash = {}, _arr = [];
           for (var i = 0; i < arr.length; i++) {
             if (!hash[arr[i]]) {
@@ -15975,33 +15975,33 @@ var require_jstat = __commonJS({
           }
           return _arr;
         };
-        jStat3.mean = function mean2(arr) {
-          return jStat3.sum(arr) / arr.length;
+        jStat4.mean = function mean2(arr) {
+          return jStat4.sum(arr) / arr.length;
         };
-        jStat3.meansqerr = function meansqerr(arr) {
-          return jStat3.sumsqerr(arr) / arr.length;
+        jStat4.meansqerr = function meansqerr(arr) {
+          return jStat4.sumsqerr(arr) / arr.length;
         };
-        jStat3.geomean = function geomean(arr) {
+        jStat4.geomean = function geomean(arr) {
           var logs = arr.map(Math2.log);
-          var meanOfLogs = jStat3.mean(logs);
+          var meanOfLogs = jStat4.mean(logs);
           return Math2.exp(meanOfLogs);
         };
-        jStat3.median = function median(arr) {
+        jStat4.median = function median(arr) {
           var arrlen = arr.length;
           var _arr = arr.slice().sort(ascNum);
           return !(arrlen & 1) ? (_arr[arrlen / 2 - 1] + _arr[arrlen / 2]) / 2 : _arr[arrlen / 2 | 0];
         };
-        jStat3.cumsum = function cumsum(arr) {
-          return jStat3.cumreduce(arr, function(a, b) {
+        jStat4.cumsum = function cumsum(arr) {
+          return jStat4.cumreduce(arr, function(a, b) {
             return a + b;
           });
         };
-        jStat3.cumprod = function cumprod(arr) {
-          return jStat3.cumreduce(arr, function(a, b) {
+        jStat4.cumprod = function cumprod(arr) {
+          return jStat4.cumreduce(arr, function(a, b) {
             return a * b;
           });
         };
-        jStat3.diff = function diff(arr) {
+        jStat4.diff = function diff(arr) {
           var diffs = [];
           var arrLen = arr.length;
           var i;
@@ -16009,7 +16009,7 @@ var require_jstat = __commonJS({
             diffs.push(arr[i] - arr[i - 1]);
           return diffs;
         };
-        jStat3.rank = function(arr) {
+        jStat4.rank = function(arr) {
           var i;
           var distinctNumbers = [];
           var numberCounts = {};
@@ -16038,7 +16038,7 @@ var require_jstat = __commonJS({
             return numberRanks[number2];
           });
         };
-        jStat3.mode = function mode(arr) {
+        jStat4.mode = function mode(arr) {
           var arrLen = arr.length;
           var _arr = arr.slice().sort(ascNum);
           var count2 = 1;
@@ -16063,23 +16063,23 @@ var require_jstat = __commonJS({
           }
           return numMaxCount === 0 ? mode_arr[0] : mode_arr;
         };
-        jStat3.range = function range(arr) {
-          return jStat3.max(arr) - jStat3.min(arr);
+        jStat4.range = function range(arr) {
+          return jStat4.max(arr) - jStat4.min(arr);
         };
-        jStat3.variance = function variance(arr, flag) {
-          return jStat3.sumsqerr(arr) / (arr.length - (flag ? 1 : 0));
+        jStat4.variance = function variance(arr, flag) {
+          return jStat4.sumsqerr(arr) / (arr.length - (flag ? 1 : 0));
         };
-        jStat3.pooledvariance = function pooledvariance(arr) {
+        jStat4.pooledvariance = function pooledvariance(arr) {
           var sumsqerr = arr.reduce(function(a, samples) {
-            return a + jStat3.sumsqerr(samples);
+            return a + jStat4.sumsqerr(samples);
           }, 0);
           var count2 = arr.reduce(function(a, samples) {
             return a + samples.length;
           }, 0);
           return sumsqerr / (count2 - arr.length);
         };
-        jStat3.deviation = function(arr) {
-          var mean2 = jStat3.mean(arr);
+        jStat4.deviation = function(arr) {
+          var mean2 = jStat4.mean(arr);
           var arrlen = arr.length;
           var dev = new Array(arrlen);
           for (var i = 0; i < arrlen; i++) {
@@ -16087,32 +16087,32 @@ var require_jstat = __commonJS({
           }
           return dev;
         };
-        jStat3.stdev = function stdev(arr, flag) {
-          return Math2.sqrt(jStat3.variance(arr, flag));
+        jStat4.stdev = function stdev(arr, flag) {
+          return Math2.sqrt(jStat4.variance(arr, flag));
         };
-        jStat3.pooledstdev = function pooledstdev(arr) {
-          return Math2.sqrt(jStat3.pooledvariance(arr));
+        jStat4.pooledstdev = function pooledstdev(arr) {
+          return Math2.sqrt(jStat4.pooledvariance(arr));
         };
-        jStat3.meandev = function meandev(arr) {
-          var mean2 = jStat3.mean(arr);
+        jStat4.meandev = function meandev(arr) {
+          var mean2 = jStat4.mean(arr);
           var a = [];
           for (var i = arr.length - 1; i >= 0; i--) {
             a.push(Math2.abs(arr[i] - mean2));
           }
-          return jStat3.mean(a);
+          return jStat4.mean(a);
         };
-        jStat3.meddev = function meddev(arr) {
-          var median = jStat3.median(arr);
+        jStat4.meddev = function meddev(arr) {
+          var median = jStat4.median(arr);
           var a = [];
           for (var i = arr.length - 1; i >= 0; i--) {
             a.push(Math2.abs(arr[i] - median));
           }
-          return jStat3.median(a);
+          return jStat4.median(a);
         };
-        jStat3.coeffvar = function coeffvar(arr) {
-          return jStat3.stdev(arr) / jStat3.mean(arr);
+        jStat4.coeffvar = function coeffvar(arr) {
+          return jStat4.stdev(arr) / jStat4.mean(arr);
         };
-        jStat3.quartiles = function quartiles(arr) {
+        jStat4.quartiles = function quartiles(arr) {
           var arrlen = arr.length;
           var _arr = arr.slice().sort(ascNum);
           return [
@@ -16121,7 +16121,7 @@ var require_jstat = __commonJS({
             _arr[Math2.round(arrlen * 3 / 4) - 1]
           ];
         };
-        jStat3.quantiles = function quantiles(arr, quantilesArray, alphap, betap) {
+        jStat4.quantiles = function quantiles(arr, quantilesArray, alphap, betap) {
           var sortedArray = arr.slice().sort(ascNum);
           var quantileVals = [quantilesArray.length];
           var n = arr.length;
@@ -16140,7 +16140,7 @@ var require_jstat = __commonJS({
           }
           return quantileVals;
         };
-        jStat3.percentile = function percentile(arr, k, exclusive) {
+        jStat4.percentile = function percentile(arr, k, exclusive) {
           var _arr = arr.slice().sort(ascNum);
           var realIndex = k * (_arr.length + (exclusive ? 1 : -1)) + (exclusive ? 0 : 1);
           var index = parseInt(realIndex);
@@ -16151,25 +16151,25 @@ var require_jstat = __commonJS({
             return _arr[index - 1];
           }
         };
-        jStat3.percentileOfScore = function percentileOfScore(arr, score, kind) {
+        jStat4.percentileOfScore = function percentileOfScore(arr, score, kind) {
           var counter = 0;
           var len = arr.length;
           var strict = false;
-          var value, i;
+          var value2, i;
           if (kind === "strict")
             strict = true;
           for (i = 0; i < len; i++) {
-            value = arr[i];
-            if (strict && value < score || !strict && value <= score) {
+            value2 = arr[i];
+            if (strict && value2 < score || !strict && value2 <= score) {
               counter++;
             }
           }
           return counter / len;
         };
-        jStat3.histogram = function histogram(arr, binCnt) {
+        jStat4.histogram = function histogram(arr, binCnt) {
           binCnt = binCnt || 4;
-          var first = jStat3.min(arr);
-          var binWidth = (jStat3.max(arr) - first) / binCnt;
+          var first = jStat4.min(arr);
+          var binWidth = (jStat4.max(arr) - first) / binCnt;
           var len = arr.length;
           var bins = [];
           var i;
@@ -16179,40 +16179,40 @@ var require_jstat = __commonJS({
             bins[Math2.min(Math2.floor((arr[i] - first) / binWidth), binCnt - 1)] += 1;
           return bins;
         };
-        jStat3.covariance = function covariance(arr1, arr2) {
-          var u = jStat3.mean(arr1);
-          var v = jStat3.mean(arr2);
+        jStat4.covariance = function covariance(arr1, arr2) {
+          var u = jStat4.mean(arr1);
+          var v = jStat4.mean(arr2);
           var arr1Len = arr1.length;
           var sq_dev = new Array(arr1Len);
           var i;
           for (i = 0; i < arr1Len; i++)
             sq_dev[i] = (arr1[i] - u) * (arr2[i] - v);
-          return jStat3.sum(sq_dev) / (arr1Len - 1);
+          return jStat4.sum(sq_dev) / (arr1Len - 1);
         };
-        jStat3.corrcoeff = function corrcoeff(arr1, arr2) {
-          return jStat3.covariance(arr1, arr2) / jStat3.stdev(arr1, 1) / jStat3.stdev(arr2, 1);
+        jStat4.corrcoeff = function corrcoeff(arr1, arr2) {
+          return jStat4.covariance(arr1, arr2) / jStat4.stdev(arr1, 1) / jStat4.stdev(arr2, 1);
         };
-        jStat3.spearmancoeff = function(arr1, arr2) {
-          arr1 = jStat3.rank(arr1);
-          arr2 = jStat3.rank(arr2);
-          return jStat3.corrcoeff(arr1, arr2);
+        jStat4.spearmancoeff = function(arr1, arr2) {
+          arr1 = jStat4.rank(arr1);
+          arr2 = jStat4.rank(arr2);
+          return jStat4.corrcoeff(arr1, arr2);
         };
-        jStat3.stanMoment = function stanMoment(arr, n) {
-          var mu = jStat3.mean(arr);
-          var sigma = jStat3.stdev(arr);
+        jStat4.stanMoment = function stanMoment(arr, n) {
+          var mu = jStat4.mean(arr);
+          var sigma = jStat4.stdev(arr);
           var len = arr.length;
           var skewSum = 0;
           for (var i = 0; i < len; i++)
             skewSum += Math2.pow((arr[i] - mu) / sigma, n);
           return skewSum / arr.length;
         };
-        jStat3.skewness = function skewness(arr) {
-          return jStat3.stanMoment(arr, 3);
+        jStat4.skewness = function skewness(arr) {
+          return jStat4.stanMoment(arr, 3);
         };
-        jStat3.kurtosis = function kurtosis(arr) {
-          return jStat3.stanMoment(arr, 4) - 3;
+        jStat4.kurtosis = function kurtosis(arr) {
+          return jStat4.stanMoment(arr, 4) - 3;
         };
-        var jProto = jStat3.prototype;
+        var jProto = jStat4.prototype;
         (function(funcs) {
           for (var i = 0; i < funcs.length; i++) (function(passfunc) {
             jProto[passfunc] = function(fullbool, func) {
@@ -16232,10 +16232,10 @@ var require_jstat = __commonJS({
               if (this.length > 1) {
                 tmpthis = fullbool === true ? this : this.transpose();
                 for (; i2 < tmpthis.length; i2++)
-                  arr[i2] = jStat3[passfunc](tmpthis[i2]);
+                  arr[i2] = jStat4[passfunc](tmpthis[i2]);
                 return arr;
               }
-              return jStat3[passfunc](this[0], fullbool);
+              return jStat4[passfunc](this[0], fullbool);
             };
           })(funcs[i]);
         })("cumsum cumprod".split(" "));
@@ -16259,10 +16259,10 @@ var require_jstat = __commonJS({
                 if (passfunc !== "sumrow")
                   tmpthis = fullbool === true ? this : this.transpose();
                 for (; i2 < tmpthis.length; i2++)
-                  arr[i2] = jStat3[passfunc](tmpthis[i2]);
-                return fullbool === true ? jStat3[passfunc](jStat3.utils.toVector(arr)) : arr;
+                  arr[i2] = jStat4[passfunc](tmpthis[i2]);
+                return fullbool === true ? jStat4[passfunc](jStat4.utils.toVector(arr)) : arr;
               }
-              return jStat3[passfunc](this[0], fullbool);
+              return jStat4[passfunc](this[0], fullbool);
             };
           })(funcs[i]);
         })("sum sumsqrd sumsqerr sumrow product min max unique mean meansqerr geomean median diff rank mode range variance deviation stdev meandev meddev coeffvar quartiles histogram skewness kurtosis".split(" "));
@@ -16287,7 +16287,7 @@ var require_jstat = __commonJS({
               } else {
                 callbackFunction = void 0;
                 var curriedFunction = function curriedFunction2(vector) {
-                  return jStat3[passfunc].apply(tmpthis, [vector].concat(args));
+                  return jStat4[passfunc].apply(tmpthis, [vector].concat(args));
                 };
               }
               if (this.length > 1) {
@@ -16300,9 +16300,9 @@ var require_jstat = __commonJS({
             };
           })(funcs[i]);
         })("quantiles percentileOfScore".split(" "));
-      })(jStat2, Math);
-      (function(jStat3, Math2) {
-        jStat3.gammaln = function gammaln(x) {
+      })(jStat3, Math);
+      (function(jStat4, Math2) {
+        jStat4.gammaln = function gammaln(x) {
           var j = 0;
           var cof = [
             76.18009172947146,
@@ -16320,7 +16320,7 @@ var require_jstat = __commonJS({
             ser += cof[j] / ++y;
           return Math2.log(2.5066282746310007 * ser / xx) - tmp;
         };
-        jStat3.loggam = function loggam(x) {
+        jStat4.loggam = function loggam(x) {
           var x0, x2, xp, gl, gl0;
           var k, n;
           var a = [
@@ -16360,7 +16360,7 @@ var require_jstat = __commonJS({
           }
           return gl;
         };
-        jStat3.gammafn = function gammafn(x) {
+        jStat4.gammafn = function gammafn(x) {
           var p = [
             -1.716185138865495,
             24.76565080557592,
@@ -16423,11 +16423,11 @@ var require_jstat = __commonJS({
           }
           return res;
         };
-        jStat3.gammap = function gammap(a, x) {
-          return jStat3.lowRegGamma(a, x) * jStat3.gammafn(a);
+        jStat4.gammap = function gammap(a, x) {
+          return jStat4.lowRegGamma(a, x) * jStat4.gammafn(a);
         };
-        jStat3.lowRegGamma = function lowRegGamma(a, x) {
-          var aln = jStat3.gammaln(a);
+        jStat4.lowRegGamma = function lowRegGamma(a, x) {
+          var aln = jStat4.gammaln(a);
           var ap = a;
           var sum = 1 / a;
           var del = sum;
@@ -16456,30 +16456,30 @@ var require_jstat = __commonJS({
           }
           return 1 - h * Math2.exp(-x + a * Math2.log(x) - aln);
         };
-        jStat3.factorialln = function factorialln(n) {
-          return n < 0 ? NaN : jStat3.gammaln(n + 1);
+        jStat4.factorialln = function factorialln(n) {
+          return n < 0 ? NaN : jStat4.gammaln(n + 1);
         };
-        jStat3.factorial = function factorial(n) {
-          return n < 0 ? NaN : jStat3.gammafn(n + 1);
+        jStat4.factorial = function factorial(n) {
+          return n < 0 ? NaN : jStat4.gammafn(n + 1);
         };
-        jStat3.combination = function combination(n, m) {
-          return n > 170 || m > 170 ? Math2.exp(jStat3.combinationln(n, m)) : jStat3.factorial(n) / jStat3.factorial(m) / jStat3.factorial(n - m);
+        jStat4.combination = function combination(n, m) {
+          return n > 170 || m > 170 ? Math2.exp(jStat4.combinationln(n, m)) : jStat4.factorial(n) / jStat4.factorial(m) / jStat4.factorial(n - m);
         };
-        jStat3.combinationln = function combinationln(n, m) {
-          return jStat3.factorialln(n) - jStat3.factorialln(m) - jStat3.factorialln(n - m);
+        jStat4.combinationln = function combinationln(n, m) {
+          return jStat4.factorialln(n) - jStat4.factorialln(m) - jStat4.factorialln(n - m);
         };
-        jStat3.permutation = function permutation(n, m) {
-          return jStat3.factorial(n) / jStat3.factorial(n - m);
+        jStat4.permutation = function permutation(n, m) {
+          return jStat4.factorial(n) / jStat4.factorial(n - m);
         };
-        jStat3.betafn = function betafn(x, y) {
+        jStat4.betafn = function betafn(x, y) {
           if (x <= 0 || y <= 0)
             return void 0;
-          return x + y > 170 ? Math2.exp(jStat3.betaln(x, y)) : jStat3.gammafn(x) * jStat3.gammafn(y) / jStat3.gammafn(x + y);
+          return x + y > 170 ? Math2.exp(jStat4.betaln(x, y)) : jStat4.gammafn(x) * jStat4.gammafn(y) / jStat4.gammafn(x + y);
         };
-        jStat3.betaln = function betaln(x, y) {
-          return jStat3.gammaln(x) + jStat3.gammaln(y) - jStat3.gammaln(x + y);
+        jStat4.betaln = function betaln(x, y) {
+          return jStat4.gammaln(x) + jStat4.gammaln(y) - jStat4.gammaln(x + y);
         };
-        jStat3.betacf = function betacf(x, a, b) {
+        jStat4.betacf = function betacf(x, a, b) {
           var fpmin = 1e-30;
           var m = 1;
           var qab = a + b;
@@ -16518,11 +16518,11 @@ var require_jstat = __commonJS({
           }
           return h;
         };
-        jStat3.gammapinv = function gammapinv(p, a) {
+        jStat4.gammapinv = function gammapinv(p, a) {
           var j = 0;
           var a1 = a - 1;
           var EPS = 1e-8;
-          var gln = jStat3.gammaln(a);
+          var gln = jStat4.gammaln(a);
           var x, err, t, u, pp, lna1, afac;
           if (p >= 1)
             return Math2.max(100, a + 100 * Math2.sqrt(a));
@@ -16550,7 +16550,7 @@ var require_jstat = __commonJS({
           for (; j < 12; j++) {
             if (x <= 0)
               return 0;
-            err = jStat3.lowRegGamma(a, x) - p;
+            err = jStat4.lowRegGamma(a, x) - p;
             if (a > 1)
               t = afac * Math2.exp(-(x - a1) + a1 * (Math2.log(x) - lna1));
             else
@@ -16564,7 +16564,7 @@ var require_jstat = __commonJS({
           }
           return x;
         };
-        jStat3.erf = function erf(x) {
+        jStat4.erf = function erf(x) {
           var cof = [
             -1.3026537197817094,
             0.6419697923564902,
@@ -16614,10 +16614,10 @@ var require_jstat = __commonJS({
           res = t * Math2.exp(-x * x + 0.5 * (cof[0] + ty * d) - dd);
           return isneg ? res - 1 : 1 - res;
         };
-        jStat3.erfc = function erfc(x) {
-          return 1 - jStat3.erf(x);
+        jStat4.erfc = function erfc(x) {
+          return 1 - jStat4.erf(x);
         };
-        jStat3.erfcinv = function erfcinv(p) {
+        jStat4.erfcinv = function erfcinv(p) {
           var j = 0;
           var x, err, t, pp;
           if (p >= 2)
@@ -16628,12 +16628,12 @@ var require_jstat = __commonJS({
           t = Math2.sqrt(-2 * Math2.log(pp / 2));
           x = -0.70711 * ((2.30753 + t * 0.27061) / (1 + t * (0.99229 + t * 0.04481)) - t);
           for (; j < 2; j++) {
-            err = jStat3.erfc(x) - pp;
+            err = jStat4.erfc(x) - pp;
             x += err / (1.1283791670955126 * Math2.exp(-x * x) - x * err);
           }
           return p < 1 ? x : -x;
         };
-        jStat3.ibetainv = function ibetainv(p, a, b) {
+        jStat4.ibetainv = function ibetainv(p, a, b) {
           var EPS = 1e-8;
           var a1 = a - 1;
           var b1 = b - 1;
@@ -16664,11 +16664,11 @@ var require_jstat = __commonJS({
             else
               x = 1 - Math2.pow(b * w * (1 - p), 1 / b);
           }
-          afac = -jStat3.gammaln(a) - jStat3.gammaln(b) + jStat3.gammaln(a + b);
+          afac = -jStat4.gammaln(a) - jStat4.gammaln(b) + jStat4.gammaln(a + b);
           for (; j < 10; j++) {
             if (x === 0 || x === 1)
               return x;
-            err = jStat3.ibeta(x, a, b) - p;
+            err = jStat4.ibeta(x, a, b) - p;
             t = Math2.exp(a1 * Math2.log(x) + b1 * Math2.log(1 - x) + afac);
             u = err / t;
             x -= t = u / (1 - 0.5 * Math2.min(1, u * (a1 / x - b1 / (1 - x))));
@@ -16681,32 +16681,32 @@ var require_jstat = __commonJS({
           }
           return x;
         };
-        jStat3.ibeta = function ibeta2(x, a, b) {
-          var bt = x === 0 || x === 1 ? 0 : Math2.exp(jStat3.gammaln(a + b) - jStat3.gammaln(a) - jStat3.gammaln(b) + a * Math2.log(x) + b * Math2.log(1 - x));
+        jStat4.ibeta = function ibeta2(x, a, b) {
+          var bt = x === 0 || x === 1 ? 0 : Math2.exp(jStat4.gammaln(a + b) - jStat4.gammaln(a) - jStat4.gammaln(b) + a * Math2.log(x) + b * Math2.log(1 - x));
           if (x < 0 || x > 1)
             return false;
           if (x < (a + 1) / (a + b + 2))
-            return bt * jStat3.betacf(x, a, b) / a;
-          return 1 - bt * jStat3.betacf(1 - x, b, a) / b;
+            return bt * jStat4.betacf(x, a, b) / a;
+          return 1 - bt * jStat4.betacf(1 - x, b, a) / b;
         };
-        jStat3.randn = function randn(n, m) {
+        jStat4.randn = function randn(n, m) {
           var u, v, x, y, q;
           if (!m)
             m = n;
           if (n)
-            return jStat3.create(n, m, function() {
-              return jStat3.randn();
+            return jStat4.create(n, m, function() {
+              return jStat4.randn();
             });
           do {
-            u = jStat3._random_fn();
-            v = 1.7156 * (jStat3._random_fn() - 0.5);
+            u = jStat4._random_fn();
+            v = 1.7156 * (jStat4._random_fn() - 0.5);
             x = u - 0.449871;
             y = Math2.abs(v) + 0.386595;
             q = x * x + y * (0.196 * y - 0.25472 * x);
           } while (q > 0.27597 && (q > 0.27846 || v * v > -4 * Math2.log(u) * u * u));
           return v / u;
         };
-        jStat3.randg = function randg(shape, n, m) {
+        jStat4.randg = function randg(shape, n, m) {
           var oalph = shape;
           var a1, a2, u, v, x, mat;
           if (!m)
@@ -16714,9 +16714,9 @@ var require_jstat = __commonJS({
           if (!shape)
             shape = 1;
           if (n) {
-            mat = jStat3.zeros(n, m);
+            mat = jStat4.zeros(n, m);
             mat.alter(function() {
-              return jStat3.randg(shape);
+              return jStat4.randg(shape);
             });
             return mat;
           }
@@ -16726,25 +16726,25 @@ var require_jstat = __commonJS({
           a2 = 1 / Math2.sqrt(9 * a1);
           do {
             do {
-              x = jStat3.randn();
+              x = jStat4.randn();
               v = 1 + a2 * x;
             } while (v <= 0);
             v = v * v * v;
-            u = jStat3._random_fn();
+            u = jStat4._random_fn();
           } while (u > 1 - 0.331 * Math2.pow(x, 4) && Math2.log(u) > 0.5 * x * x + a1 * (1 - v + Math2.log(v)));
           if (shape == oalph)
             return a1 * v;
           do {
-            u = jStat3._random_fn();
+            u = jStat4._random_fn();
           } while (u === 0);
           return Math2.pow(u, 1 / oalph) * a1 * v;
         };
         (function(funcs) {
           for (var i = 0; i < funcs.length; i++) (function(passfunc) {
-            jStat3.fn[passfunc] = function() {
-              return jStat3(
-                jStat3.map(this, function(value) {
-                  return jStat3[passfunc](value);
+            jStat4.fn[passfunc] = function() {
+              return jStat4(
+                jStat4.map(this, function(value2) {
+                  return jStat4[passfunc](value2);
                 })
               );
             };
@@ -16752,16 +16752,16 @@ var require_jstat = __commonJS({
         })("gammaln gammafn factorial factorialln".split(" "));
         (function(funcs) {
           for (var i = 0; i < funcs.length; i++) (function(passfunc) {
-            jStat3.fn[passfunc] = function() {
-              return jStat3(jStat3[passfunc].apply(null, arguments));
+            jStat4.fn[passfunc] = function() {
+              return jStat4(jStat4[passfunc].apply(null, arguments));
             };
           })(funcs[i]);
         })("randn".split(" "));
-      })(jStat2, Math);
-      (function(jStat3, Math2) {
+      })(jStat3, Math);
+      (function(jStat4, Math2) {
         (function(list) {
           for (var i = 0; i < list.length; i++) (function(func) {
-            jStat3[func] = function f(a, b, c) {
+            jStat4[func] = function f(a, b, c) {
               if (!(this instanceof f))
                 return new f(a, b, c);
               this._a = a;
@@ -16769,85 +16769,85 @@ var require_jstat = __commonJS({
               this._c = c;
               return this;
             };
-            jStat3.fn[func] = function(a, b, c) {
-              var newthis = jStat3[func](a, b, c);
+            jStat4.fn[func] = function(a, b, c) {
+              var newthis = jStat4[func](a, b, c);
               newthis.data = this;
               return newthis;
             };
-            jStat3[func].prototype.sample = function(arr) {
+            jStat4[func].prototype.sample = function(arr) {
               var a = this._a;
               var b = this._b;
               var c = this._c;
               if (arr)
-                return jStat3.alter(arr, function() {
-                  return jStat3[func].sample(a, b, c);
+                return jStat4.alter(arr, function() {
+                  return jStat4[func].sample(a, b, c);
                 });
               else
-                return jStat3[func].sample(a, b, c);
+                return jStat4[func].sample(a, b, c);
             };
             (function(vals) {
               for (var i2 = 0; i2 < vals.length; i2++) (function(fnfunc) {
-                jStat3[func].prototype[fnfunc] = function(x) {
+                jStat4[func].prototype[fnfunc] = function(x) {
                   var a = this._a;
                   var b = this._b;
                   var c = this._c;
                   if (!x && x !== 0)
                     x = this.data;
                   if (typeof x !== "number") {
-                    return jStat3.fn.map.call(x, function(x2) {
-                      return jStat3[func][fnfunc](x2, a, b, c);
+                    return jStat4.fn.map.call(x, function(x2) {
+                      return jStat4[func][fnfunc](x2, a, b, c);
                     });
                   }
-                  return jStat3[func][fnfunc](x, a, b, c);
+                  return jStat4[func][fnfunc](x, a, b, c);
                 };
               })(vals[i2]);
             })("pdf cdf inv".split(" "));
             (function(vals) {
               for (var i2 = 0; i2 < vals.length; i2++) (function(fnfunc) {
-                jStat3[func].prototype[fnfunc] = function() {
-                  return jStat3[func][fnfunc](this._a, this._b, this._c);
+                jStat4[func].prototype[fnfunc] = function() {
+                  return jStat4[func][fnfunc](this._a, this._b, this._c);
                 };
               })(vals[i2]);
             })("mean median mode variance".split(" "));
           })(list[i]);
         })("beta centralF cauchy chisquare exponential gamma invgamma kumaraswamy laplace lognormal noncentralt normal pareto studentt weibull uniform binomial negbin hypgeom poisson triangular tukey arcsine".split(" "));
-        jStat3.extend(jStat3.beta, {
+        jStat4.extend(jStat4.beta, {
           pdf: function pdf(x, alpha, beta) {
             if (x > 1 || x < 0)
               return 0;
             if (alpha == 1 && beta == 1)
               return 1;
             if (alpha < 512 && beta < 512) {
-              return Math2.pow(x, alpha - 1) * Math2.pow(1 - x, beta - 1) / jStat3.betafn(alpha, beta);
+              return Math2.pow(x, alpha - 1) * Math2.pow(1 - x, beta - 1) / jStat4.betafn(alpha, beta);
             } else {
-              return Math2.exp((alpha - 1) * Math2.log(x) + (beta - 1) * Math2.log(1 - x) - jStat3.betaln(alpha, beta));
+              return Math2.exp((alpha - 1) * Math2.log(x) + (beta - 1) * Math2.log(1 - x) - jStat4.betaln(alpha, beta));
             }
           },
           cdf: function cdf(x, alpha, beta) {
-            return x > 1 || x < 0 ? (x > 1) * 1 : jStat3.ibeta(x, alpha, beta);
+            return x > 1 || x < 0 ? (x > 1) * 1 : jStat4.ibeta(x, alpha, beta);
           },
           inv: function inv(x, alpha, beta) {
-            return jStat3.ibetainv(x, alpha, beta);
+            return jStat4.ibetainv(x, alpha, beta);
           },
           mean: function mean2(alpha, beta) {
             return alpha / (alpha + beta);
           },
           median: function median(alpha, beta) {
-            return jStat3.ibetainv(0.5, alpha, beta);
+            return jStat4.ibetainv(0.5, alpha, beta);
           },
           mode: function mode(alpha, beta) {
             return (alpha - 1) / (alpha + beta - 2);
           },
           // return a random sample
           sample: function sample(alpha, beta) {
-            var u = jStat3.randg(alpha);
-            return u / (u + jStat3.randg(beta));
+            var u = jStat4.randg(alpha);
+            return u / (u + jStat4.randg(beta));
           },
           variance: function variance(alpha, beta) {
             return alpha * beta / (Math2.pow(alpha + beta, 2) * (alpha + beta + 1));
           }
         });
-        jStat3.extend(jStat3.centralF, {
+        jStat4.extend(jStat4.centralF, {
           // This implementation of the pdf function avoids float overflow
           // See the way that R calculates this value:
           // https://svn.r-project.org/R/trunk/src/nmath/df.c
@@ -16862,20 +16862,20 @@ var require_jstat = __commonJS({
               if (x === 0 && df1 === 2) {
                 return 1;
               }
-              return 1 / jStat3.betafn(df1 / 2, df2 / 2) * Math2.pow(df1 / df2, df1 / 2) * Math2.pow(x, df1 / 2 - 1) * Math2.pow(1 + df1 / df2 * x, -(df1 + df2) / 2);
+              return 1 / jStat4.betafn(df1 / 2, df2 / 2) * Math2.pow(df1 / df2, df1 / 2) * Math2.pow(x, df1 / 2 - 1) * Math2.pow(1 + df1 / df2 * x, -(df1 + df2) / 2);
             }
             p = df1 * x / (df2 + x * df1);
             q = df2 / (df2 + x * df1);
             f = df1 * q / 2;
-            return f * jStat3.binomial.pdf((df1 - 2) / 2, (df1 + df2 - 2) / 2, p);
+            return f * jStat4.binomial.pdf((df1 - 2) / 2, (df1 + df2 - 2) / 2, p);
           },
           cdf: function cdf(x, df1, df2) {
             if (x < 0)
               return 0;
-            return jStat3.ibeta(df1 * x / (df1 * x + df2), df1 / 2, df2 / 2);
+            return jStat4.ibeta(df1 * x / (df1 * x + df2), df1 / 2, df2 / 2);
           },
           inv: function inv(x, df1, df2) {
-            return df2 / (df1 * (1 / jStat3.ibetainv(x, df1 / 2, df2 / 2) - 1));
+            return df2 / (df1 * (1 / jStat4.ibetainv(x, df1 / 2, df2 / 2) - 1));
           },
           mean: function mean2(df1, df2) {
             return df2 > 2 ? df2 / (df2 - 2) : void 0;
@@ -16885,8 +16885,8 @@ var require_jstat = __commonJS({
           },
           // return a random sample
           sample: function sample(df1, df2) {
-            var x1 = jStat3.randg(df1 / 2) * 2;
-            var x2 = jStat3.randg(df2 / 2) * 2;
+            var x1 = jStat4.randg(df1 / 2) * 2;
+            var x2 = jStat4.randg(df2 / 2) * 2;
             return x1 / df1 / (x2 / df2);
           },
           variance: function variance(df1, df2) {
@@ -16895,7 +16895,7 @@ var require_jstat = __commonJS({
             return 2 * df2 * df2 * (df1 + df2 - 2) / (df1 * (df2 - 2) * (df2 - 2) * (df2 - 4));
           }
         });
-        jStat3.extend(jStat3.cauchy, {
+        jStat4.extend(jStat4.cauchy, {
           pdf: function pdf(x, local, scale) {
             if (scale < 0) {
               return 0;
@@ -16915,22 +16915,22 @@ var require_jstat = __commonJS({
             return local;
           },
           sample: function sample(local, scale) {
-            return jStat3.randn() * Math2.sqrt(1 / (2 * jStat3.randg(0.5))) * scale + local;
+            return jStat4.randn() * Math2.sqrt(1 / (2 * jStat4.randg(0.5))) * scale + local;
           }
         });
-        jStat3.extend(jStat3.chisquare, {
+        jStat4.extend(jStat4.chisquare, {
           pdf: function pdf(x, dof) {
             if (x < 0)
               return 0;
-            return x === 0 && dof === 2 ? 0.5 : Math2.exp((dof / 2 - 1) * Math2.log(x) - x / 2 - dof / 2 * Math2.log(2) - jStat3.gammaln(dof / 2));
+            return x === 0 && dof === 2 ? 0.5 : Math2.exp((dof / 2 - 1) * Math2.log(x) - x / 2 - dof / 2 * Math2.log(2) - jStat4.gammaln(dof / 2));
           },
           cdf: function cdf(x, dof) {
             if (x < 0)
               return 0;
-            return jStat3.lowRegGamma(dof / 2, x / 2);
+            return jStat4.lowRegGamma(dof / 2, x / 2);
           },
           inv: function(p, dof) {
-            return 2 * jStat3.gammapinv(p, 0.5 * dof);
+            return 2 * jStat4.gammapinv(p, 0.5 * dof);
           },
           mean: function(dof) {
             return dof;
@@ -16943,13 +16943,13 @@ var require_jstat = __commonJS({
             return dof - 2 > 0 ? dof - 2 : 0;
           },
           sample: function sample(dof) {
-            return jStat3.randg(dof / 2) * 2;
+            return jStat4.randg(dof / 2) * 2;
           },
           variance: function variance(dof) {
             return 2 * dof;
           }
         });
-        jStat3.extend(jStat3.exponential, {
+        jStat4.extend(jStat4.exponential, {
           pdf: function pdf(x, rate) {
             return x < 0 ? 0 : rate * Math2.exp(-rate * x);
           },
@@ -16969,25 +16969,25 @@ var require_jstat = __commonJS({
             return 0;
           },
           sample: function sample(rate) {
-            return -1 / rate * Math2.log(jStat3._random_fn());
+            return -1 / rate * Math2.log(jStat4._random_fn());
           },
           variance: function(rate) {
             return Math2.pow(rate, -2);
           }
         });
-        jStat3.extend(jStat3.gamma, {
+        jStat4.extend(jStat4.gamma, {
           pdf: function pdf(x, shape, scale) {
             if (x < 0)
               return 0;
-            return x === 0 && shape === 1 ? 1 / scale : Math2.exp((shape - 1) * Math2.log(x) - x / scale - jStat3.gammaln(shape) - shape * Math2.log(scale));
+            return x === 0 && shape === 1 ? 1 / scale : Math2.exp((shape - 1) * Math2.log(x) - x / scale - jStat4.gammaln(shape) - shape * Math2.log(scale));
           },
           cdf: function cdf(x, shape, scale) {
             if (x < 0)
               return 0;
-            return jStat3.lowRegGamma(shape, x / scale);
+            return jStat4.lowRegGamma(shape, x / scale);
           },
           inv: function(p, shape, scale) {
-            return jStat3.gammapinv(p, shape) * scale;
+            return jStat4.gammapinv(p, shape) * scale;
           },
           mean: function(shape, scale) {
             return shape * scale;
@@ -16997,25 +16997,25 @@ var require_jstat = __commonJS({
             return void 0;
           },
           sample: function sample(shape, scale) {
-            return jStat3.randg(shape) * scale;
+            return jStat4.randg(shape) * scale;
           },
           variance: function variance(shape, scale) {
             return shape * scale * scale;
           }
         });
-        jStat3.extend(jStat3.invgamma, {
+        jStat4.extend(jStat4.invgamma, {
           pdf: function pdf(x, shape, scale) {
             if (x <= 0)
               return 0;
-            return Math2.exp(-(shape + 1) * Math2.log(x) - scale / x - jStat3.gammaln(shape) + shape * Math2.log(scale));
+            return Math2.exp(-(shape + 1) * Math2.log(x) - scale / x - jStat4.gammaln(shape) + shape * Math2.log(scale));
           },
           cdf: function cdf(x, shape, scale) {
             if (x <= 0)
               return 0;
-            return 1 - jStat3.lowRegGamma(shape, scale / x);
+            return 1 - jStat4.lowRegGamma(shape, scale / x);
           },
           inv: function(p, shape, scale) {
-            return scale / jStat3.gammapinv(1 - p, shape);
+            return scale / jStat4.gammapinv(1 - p, shape);
           },
           mean: function(shape, scale) {
             return shape > 1 ? scale / (shape - 1) : void 0;
@@ -17024,7 +17024,7 @@ var require_jstat = __commonJS({
             return scale / (shape + 1);
           },
           sample: function sample(shape, scale) {
-            return scale / jStat3.randg(shape);
+            return scale / jStat4.randg(shape);
           },
           variance: function variance(shape, scale) {
             if (shape <= 2)
@@ -17032,7 +17032,7 @@ var require_jstat = __commonJS({
             return scale * scale / ((shape - 1) * (shape - 1) * (shape - 2));
           }
         });
-        jStat3.extend(jStat3.kumaraswamy, {
+        jStat4.extend(jStat4.kumaraswamy, {
           pdf: function pdf(x, alpha, beta) {
             if (x === 0 && alpha === 1)
               return beta;
@@ -17051,7 +17051,7 @@ var require_jstat = __commonJS({
             return Math2.pow(1 - Math2.pow(1 - p, 1 / beta), 1 / alpha);
           },
           mean: function(alpha, beta) {
-            return beta * jStat3.gammafn(1 + 1 / alpha) * jStat3.gammafn(beta) / jStat3.gammafn(1 + 1 / alpha + beta);
+            return beta * jStat4.gammafn(1 + 1 / alpha) * jStat4.gammafn(beta) / jStat4.gammafn(1 + 1 / alpha + beta);
           },
           median: function median(alpha, beta) {
             return Math2.pow(1 - Math2.pow(2, -1 / beta), 1 / alpha);
@@ -17065,7 +17065,7 @@ var require_jstat = __commonJS({
             throw new Error("variance not yet implemented");
           }
         });
-        jStat3.extend(jStat3.lognormal, {
+        jStat4.extend(jStat4.lognormal, {
           pdf: function pdf(x, mu, sigma) {
             if (x <= 0)
               return 0;
@@ -17074,10 +17074,10 @@ var require_jstat = __commonJS({
           cdf: function cdf(x, mu, sigma) {
             if (x < 0)
               return 0;
-            return 0.5 + 0.5 * jStat3.erf((Math2.log(x) - mu) / Math2.sqrt(2 * sigma * sigma));
+            return 0.5 + 0.5 * jStat4.erf((Math2.log(x) - mu) / Math2.sqrt(2 * sigma * sigma));
           },
           inv: function(p, mu, sigma) {
-            return Math2.exp(-1.4142135623730951 * sigma * jStat3.erfcinv(2 * p) + mu);
+            return Math2.exp(-1.4142135623730951 * sigma * jStat4.erfcinv(2 * p) + mu);
           },
           mean: function mean2(mu, sigma) {
             return Math2.exp(mu + sigma * sigma / 2);
@@ -17089,61 +17089,61 @@ var require_jstat = __commonJS({
             return Math2.exp(mu - sigma * sigma);
           },
           sample: function sample(mu, sigma) {
-            return Math2.exp(jStat3.randn() * sigma + mu);
+            return Math2.exp(jStat4.randn() * sigma + mu);
           },
           variance: function variance(mu, sigma) {
             return (Math2.exp(sigma * sigma) - 1) * Math2.exp(2 * mu + sigma * sigma);
           }
         });
-        jStat3.extend(jStat3.noncentralt, {
+        jStat4.extend(jStat4.noncentralt, {
           pdf: function pdf(x, dof, ncp) {
             var tol = 1e-14;
             if (Math2.abs(ncp) < tol)
-              return jStat3.studentt.pdf(x, dof);
+              return jStat4.studentt.pdf(x, dof);
             if (Math2.abs(x) < tol) {
-              return Math2.exp(jStat3.gammaln((dof + 1) / 2) - ncp * ncp / 2 - 0.5 * Math2.log(Math2.PI * dof) - jStat3.gammaln(dof / 2));
+              return Math2.exp(jStat4.gammaln((dof + 1) / 2) - ncp * ncp / 2 - 0.5 * Math2.log(Math2.PI * dof) - jStat4.gammaln(dof / 2));
             }
-            return dof / x * (jStat3.noncentralt.cdf(x * Math2.sqrt(1 + 2 / dof), dof + 2, ncp) - jStat3.noncentralt.cdf(x, dof, ncp));
+            return dof / x * (jStat4.noncentralt.cdf(x * Math2.sqrt(1 + 2 / dof), dof + 2, ncp) - jStat4.noncentralt.cdf(x, dof, ncp));
           },
           cdf: function cdf(x, dof, ncp) {
             var tol = 1e-14;
             var min_iterations = 200;
             if (Math2.abs(ncp) < tol)
-              return jStat3.studentt.cdf(x, dof);
+              return jStat4.studentt.cdf(x, dof);
             var flip = false;
             if (x < 0) {
               flip = true;
               ncp = -ncp;
             }
-            var prob = jStat3.normal.cdf(-ncp, 0, 1);
-            var value = tol + 1;
-            var lastvalue = value;
+            var prob = jStat4.normal.cdf(-ncp, 0, 1);
+            var value2 = tol + 1;
+            var lastvalue = value2;
             var y = x * x / (x * x + dof);
             var j = 0;
             var p = Math2.exp(-ncp * ncp / 2);
-            var q = Math2.exp(-ncp * ncp / 2 - 0.5 * Math2.log(2) - jStat3.gammaln(3 / 2)) * ncp;
-            while (j < min_iterations || lastvalue > tol || value > tol) {
-              lastvalue = value;
+            var q = Math2.exp(-ncp * ncp / 2 - 0.5 * Math2.log(2) - jStat4.gammaln(3 / 2)) * ncp;
+            while (j < min_iterations || lastvalue > tol || value2 > tol) {
+              lastvalue = value2;
               if (j > 0) {
                 p *= ncp * ncp / (2 * j);
                 q *= ncp * ncp / (2 * (j + 1 / 2));
               }
-              value = p * jStat3.beta.cdf(y, j + 0.5, dof / 2) + q * jStat3.beta.cdf(y, j + 1, dof / 2);
-              prob += 0.5 * value;
+              value2 = p * jStat4.beta.cdf(y, j + 0.5, dof / 2) + q * jStat4.beta.cdf(y, j + 1, dof / 2);
+              prob += 0.5 * value2;
               j++;
             }
             return flip ? 1 - prob : prob;
           }
         });
-        jStat3.extend(jStat3.normal, {
+        jStat4.extend(jStat4.normal, {
           pdf: function pdf(x, mean2, std) {
             return Math2.exp(-0.5 * Math2.log(2 * Math2.PI) - Math2.log(std) - Math2.pow(x - mean2, 2) / (2 * std * std));
           },
           cdf: function cdf(x, mean2, std) {
-            return 0.5 * (1 + jStat3.erf((x - mean2) / Math2.sqrt(2 * std * std)));
+            return 0.5 * (1 + jStat4.erf((x - mean2) / Math2.sqrt(2 * std * std)));
           },
           inv: function(p, mean2, std) {
-            return -1.4142135623730951 * std * jStat3.erfcinv(2 * p) + mean2;
+            return -1.4142135623730951 * std * jStat4.erfcinv(2 * p) + mean2;
           },
           mean: function(mean2) {
             return mean2;
@@ -17155,13 +17155,13 @@ var require_jstat = __commonJS({
             return mean2;
           },
           sample: function sample(mean2, std) {
-            return jStat3.randn() * std + mean2;
+            return jStat4.randn() * std + mean2;
           },
           variance: function(mean2, std) {
             return std * std;
           }
         });
-        jStat3.extend(jStat3.pareto, {
+        jStat4.extend(jStat4.pareto, {
           pdf: function pdf(x, scale, shape) {
             if (x < scale)
               return 0;
@@ -17192,17 +17192,17 @@ var require_jstat = __commonJS({
             return scale * scale * shape / (Math2.pow(shape - 1, 2) * (shape - 2));
           }
         });
-        jStat3.extend(jStat3.studentt, {
+        jStat4.extend(jStat4.studentt, {
           pdf: function pdf(x, dof) {
             dof = dof > 1e100 ? 1e100 : dof;
-            return 1 / (Math2.sqrt(dof) * jStat3.betafn(0.5, dof / 2)) * Math2.pow(1 + x * x / dof, -((dof + 1) / 2));
+            return 1 / (Math2.sqrt(dof) * jStat4.betafn(0.5, dof / 2)) * Math2.pow(1 + x * x / dof, -((dof + 1) / 2));
           },
           cdf: function cdf(x, dof) {
             var dof2 = dof / 2;
-            return jStat3.ibeta((x + Math2.sqrt(x * x + dof)) / (2 * Math2.sqrt(x * x + dof)), dof2, dof2);
+            return jStat4.ibeta((x + Math2.sqrt(x * x + dof)) / (2 * Math2.sqrt(x * x + dof)), dof2, dof2);
           },
           inv: function(p, dof) {
-            var x = jStat3.ibetainv(2 * Math2.min(p, 1 - p), 0.5 * dof, 0.5);
+            var x = jStat4.ibetainv(2 * Math2.min(p, 1 - p), 0.5 * dof, 0.5);
             x = Math2.sqrt(dof * (1 - x) / x);
             return p > 0.5 ? x : -x;
           },
@@ -17216,13 +17216,13 @@ var require_jstat = __commonJS({
             return 0;
           },
           sample: function sample(dof) {
-            return jStat3.randn() * Math2.sqrt(dof / (2 * jStat3.randg(dof / 2)));
+            return jStat4.randn() * Math2.sqrt(dof / (2 * jStat4.randg(dof / 2)));
           },
           variance: function variance(dof) {
             return dof > 2 ? dof / (dof - 2) : dof > 1 ? Infinity : void 0;
           }
         });
-        jStat3.extend(jStat3.weibull, {
+        jStat4.extend(jStat4.weibull, {
           pdf: function pdf(x, scale, shape) {
             if (x < 0 || scale < 0 || shape < 0)
               return 0;
@@ -17235,7 +17235,7 @@ var require_jstat = __commonJS({
             return scale * Math2.pow(-Math2.log(1 - p), 1 / shape);
           },
           mean: function(scale, shape) {
-            return scale * jStat3.gammafn(1 + 1 / shape);
+            return scale * jStat4.gammafn(1 + 1 / shape);
           },
           median: function median(scale, shape) {
             return scale * Math2.pow(Math2.log(2), 1 / shape);
@@ -17246,13 +17246,13 @@ var require_jstat = __commonJS({
             return scale * Math2.pow((shape - 1) / shape, 1 / shape);
           },
           sample: function sample(scale, shape) {
-            return scale * Math2.pow(-Math2.log(jStat3._random_fn()), 1 / shape);
+            return scale * Math2.pow(-Math2.log(jStat4._random_fn()), 1 / shape);
           },
           variance: function variance(scale, shape) {
-            return scale * scale * jStat3.gammafn(1 + 2 / shape) - Math2.pow(jStat3.weibull.mean(scale, shape), 2);
+            return scale * scale * jStat4.gammafn(1 + 2 / shape) - Math2.pow(jStat4.weibull.mean(scale, shape), 2);
           }
         });
-        jStat3.extend(jStat3.uniform, {
+        jStat4.extend(jStat4.uniform, {
           pdf: function pdf(x, a, b) {
             return x < a || x > b ? 0 : 1 / (b - a);
           },
@@ -17270,13 +17270,13 @@ var require_jstat = __commonJS({
             return 0.5 * (a + b);
           },
           median: function median(a, b) {
-            return jStat3.mean(a, b);
+            return jStat4.mean(a, b);
           },
           mode: function mode() {
             throw new Error("mode is not yet implemented");
           },
           sample: function sample(a, b) {
-            return a / 2 + b / 2 + (b / 2 - a / 2) * (2 * jStat3._random_fn() - 1);
+            return a / 2 + b / 2 + (b / 2 - a / 2) * (2 * jStat4._random_fn() - 1);
           },
           variance: function variance(a, b) {
             return Math2.pow(b - a, 2) / 12;
@@ -17306,9 +17306,9 @@ var require_jstat = __commonJS({
           }
           return a1 / a;
         }
-        jStat3.extend(jStat3.binomial, {
+        jStat4.extend(jStat4.binomial, {
           pdf: function pdf(k, n, p) {
-            return p === 0 || p === 1 ? n * p === k ? 1 : 0 : jStat3.combination(n, k) * Math2.pow(p, k) * Math2.pow(1 - p, n - k);
+            return p === 0 || p === 1 ? n * p === k ? 1 : 0 : jStat4.combination(n, k) * Math2.pow(p, k) * Math2.pow(1 - p, n - k);
           },
           cdf: function cdf(x, n, p) {
             var betacdf;
@@ -17324,7 +17324,7 @@ var require_jstat = __commonJS({
             var a = x + 1;
             var b = n - x;
             var s = a + b;
-            var bt = Math2.exp(jStat3.gammaln(s) - jStat3.gammaln(b) - jStat3.gammaln(a) + a * Math2.log(z) + b * Math2.log(1 - z));
+            var bt = Math2.exp(jStat4.gammaln(s) - jStat4.gammaln(b) - jStat4.gammaln(a) + a * Math2.log(z) + b * Math2.log(1 - z));
             if (z < (a + 1) / (s + 2))
               betacdf = bt * betinc(z, a, b, eps);
             else
@@ -17332,24 +17332,24 @@ var require_jstat = __commonJS({
             return Math2.round((1 - betacdf) * (1 / eps)) / (1 / eps);
           }
         });
-        jStat3.extend(jStat3.negbin, {
+        jStat4.extend(jStat4.negbin, {
           pdf: function pdf(k, r, p) {
             if (k !== k >>> 0)
               return false;
             if (k < 0)
               return 0;
-            return jStat3.combination(k + r - 1, r - 1) * Math2.pow(1 - p, k) * Math2.pow(p, r);
+            return jStat4.combination(k + r - 1, r - 1) * Math2.pow(1 - p, k) * Math2.pow(p, r);
           },
           cdf: function cdf(x, r, p) {
             var sum = 0, k = 0;
             if (x < 0) return 0;
             for (; k <= x; k++) {
-              sum += jStat3.negbin.pdf(k, r, p);
+              sum += jStat4.negbin.pdf(k, r, p);
             }
             return sum;
           }
         });
-        jStat3.extend(jStat3.hypgeom, {
+        jStat4.extend(jStat4.hypgeom, {
           pdf: function pdf(k, N, m, n) {
             if (k !== k | 0) {
               return false;
@@ -17359,14 +17359,14 @@ var require_jstat = __commonJS({
               return 0;
             } else if (m * 2 > N) {
               if (n * 2 > N) {
-                return jStat3.hypgeom.pdf(N - m - n + k, N, N - m, N - n);
+                return jStat4.hypgeom.pdf(N - m - n + k, N, N - m, N - n);
               } else {
-                return jStat3.hypgeom.pdf(n - k, N, N - m, n);
+                return jStat4.hypgeom.pdf(n - k, N, N - m, n);
               }
             } else if (n * 2 > N) {
-              return jStat3.hypgeom.pdf(m - k, N, m, N - n);
+              return jStat4.hypgeom.pdf(m - k, N, m, N - n);
             } else if (m < n) {
-              return jStat3.hypgeom.pdf(k, N, n, m);
+              return jStat4.hypgeom.pdf(k, N, n, m);
             } else {
               var scaledPDF = 1;
               var samplesDone = 0;
@@ -17390,14 +17390,14 @@ var require_jstat = __commonJS({
               return 1;
             } else if (m * 2 > N) {
               if (n * 2 > N) {
-                return jStat3.hypgeom.cdf(N - m - n + x, N, N - m, N - n);
+                return jStat4.hypgeom.cdf(N - m - n + x, N, N - m, N - n);
               } else {
-                return 1 - jStat3.hypgeom.cdf(n - x - 1, N, N - m, n);
+                return 1 - jStat4.hypgeom.cdf(n - x - 1, N, N - m, n);
               }
             } else if (n * 2 > N) {
-              return 1 - jStat3.hypgeom.cdf(m - x - 1, N, m, N - n);
+              return 1 - jStat4.hypgeom.cdf(m - x - 1, N, m, N - n);
             } else if (m < n) {
-              return jStat3.hypgeom.cdf(x, N, n, m);
+              return jStat4.hypgeom.cdf(x, N, n, m);
             } else {
               var scaledCDF = 1;
               var scaledPDF = 1;
@@ -17419,20 +17419,20 @@ var require_jstat = __commonJS({
             }
           }
         });
-        jStat3.extend(jStat3.poisson, {
+        jStat4.extend(jStat4.poisson, {
           pdf: function pdf(k, l) {
             if (l < 0 || k % 1 !== 0 || k < 0) {
               return 0;
             }
-            return Math2.pow(l, k) * Math2.exp(-l) / jStat3.factorial(k);
+            return Math2.pow(l, k) * Math2.exp(-l) / jStat4.factorial(k);
           },
           cdf: function cdf(x, l) {
             var sumarr = [], k = 0;
             if (x < 0) return 0;
             for (; k <= x; k++) {
-              sumarr.push(jStat3.poisson.pdf(k, l));
+              sumarr.push(jStat4.poisson.pdf(k, l));
             }
-            return jStat3.sum(sumarr);
+            return jStat4.sum(sumarr);
           },
           mean: function(l) {
             return l;
@@ -17444,7 +17444,7 @@ var require_jstat = __commonJS({
             var p = 1, k = 0, L = Math2.exp(-l);
             do {
               k++;
-              p *= jStat3._random_fn();
+              p *= jStat4._random_fn();
             } while (p > L);
             return k - 1;
           },
@@ -17469,7 +17469,7 @@ var require_jstat = __commonJS({
               if (k < 0 || us < 0.013 && V > us) {
                 continue;
               }
-              if (Math2.log(V) + Math2.log(invalpha) - Math2.log(a / (us * us) + b) <= -lam + k * loglam - jStat3.loggam(k + 1)) {
+              if (Math2.log(V) + Math2.log(invalpha) - Math2.log(a / (us * us) + b) <= -lam + k * loglam - jStat4.loggam(k + 1)) {
                 return k;
               }
             }
@@ -17481,7 +17481,7 @@ var require_jstat = __commonJS({
               return this.sampleLarge(l);
           }
         });
-        jStat3.extend(jStat3.triangular, {
+        jStat4.extend(jStat4.triangular, {
           pdf: function pdf(x, a, b, c) {
             if (b <= a || c < a || c > b) {
               return NaN;
@@ -17534,7 +17534,7 @@ var require_jstat = __commonJS({
             return c;
           },
           sample: function sample(a, b, c) {
-            var u = jStat3._random_fn();
+            var u = jStat4._random_fn();
             if (u < (c - a) / (b - a))
               return a + Math2.sqrt(u * (b - a) * (c - a));
             return b - Math2.sqrt((1 - u) * (b - a) * (b - c));
@@ -17543,7 +17543,7 @@ var require_jstat = __commonJS({
             return (a * a + b * b + c * c - a * b - a * c - b * c) / 18;
           }
         });
-        jStat3.extend(jStat3.arcsine, {
+        jStat4.extend(jStat4.arcsine, {
           pdf: function pdf(x, a, b) {
             if (b <= a) return NaN;
             return x <= a || x >= b ? 0 : 2 / Math2.PI * Math2.pow(Math2.pow(b - a, 2) - Math2.pow(2 * x - a - b, 2), -0.5);
@@ -17570,7 +17570,7 @@ var require_jstat = __commonJS({
             throw new Error("mode is not yet implemented");
           },
           sample: function sample(a, b) {
-            return (a + b) / 2 + (b - a) / 2 * Math2.sin(2 * Math2.PI * jStat3.uniform.sample(0, 1));
+            return (a + b) / 2 + (b - a) / 2 * Math2.sin(2 * Math2.PI * jStat4.uniform.sample(0, 1));
           },
           variance: function variance(a, b) {
             if (b <= a) return NaN;
@@ -17580,7 +17580,7 @@ var require_jstat = __commonJS({
         function laplaceSign(x) {
           return x / Math2.abs(x);
         }
-        jStat3.extend(jStat3.laplace, {
+        jStat4.extend(jStat4.laplace, {
           pdf: function pdf(x, mu, b) {
             return b <= 0 ? 0 : Math2.exp(-Math2.abs(x - mu) / b) / (2 * b);
           },
@@ -17607,7 +17607,7 @@ var require_jstat = __commonJS({
             return 2 * b * b;
           },
           sample: function sample(mu, b) {
-            var u = jStat3._random_fn() - 0.5;
+            var u = jStat4._random_fn() - 0.5;
             return mu - b * laplaceSign(u) * Math2.log(1 - 2 * Math2.abs(u));
           }
         });
@@ -17640,7 +17640,7 @@ var require_jstat = __commonJS({
           var qsqz = w * 0.5;
           if (qsqz >= bb)
             return 1;
-          var pr_w = 2 * jStat3.normal.cdf(qsqz, 0, 1, 1, 0) - 1;
+          var pr_w = 2 * jStat4.normal.cdf(qsqz, 0, 1, 1, 0) - 1;
           if (pr_w >= Math2.exp(C2 / cc))
             pr_w = Math2.pow(pr_w, cc);
           else
@@ -17673,8 +17673,8 @@ var require_jstat = __commonJS({
               var qexpo = ac * ac;
               if (qexpo > C3)
                 break;
-              var pplus = 2 * jStat3.normal.cdf(ac, 0, 1, 1, 0);
-              var pminus = 2 * jStat3.normal.cdf(ac, w, 1, 1, 0);
+              var pplus = 2 * jStat4.normal.cdf(ac, 0, 1, 1, 0);
+              var pminus = 2 * jStat4.normal.cdf(ac, w, 1, 1, 0);
               var rinsum = pplus * 0.5 - pminus * 0.5;
               if (rinsum >= Math2.exp(C1 / cc1)) {
                 rinsum = aleg[j - 1] * Math2.exp(-(0.5 * qexpo)) * Math2.pow(rinsum, cc1);
@@ -17719,7 +17719,7 @@ var require_jstat = __commonJS({
           if (v < vmax) q += -c3 / v + c4 * t / v;
           return t * (q * Math2.log(c - 1) + c5);
         }
-        jStat3.extend(jStat3.tukey, {
+        jStat4.extend(jStat4.tukey, {
           cdf: function cdf(q, nmeans, df) {
             var rr = 1;
             var cc = nmeans;
@@ -17763,7 +17763,7 @@ var require_jstat = __commonJS({
             if (df > dlarg)
               return tukeyWprob(q, rr, cc);
             var f2 = df * 0.5;
-            var f2lf = f2 * Math2.log(df) - df * Math2.log(2) - jStat3.gammaln(f2);
+            var f2lf = f2 * Math2.log(df) - df * Math2.log(2) - jStat4.gammaln(f2);
             var f21 = f2 - 1;
             var ff4 = df * 0.25;
             var ulen;
@@ -17818,13 +17818,13 @@ var require_jstat = __commonJS({
             if (p === 0) return 0;
             if (p === 1) return Infinity;
             var x0 = tukeyQinv(p, cc, df);
-            var valx0 = jStat3.tukey.cdf(x0, nmeans, df) - p;
+            var valx0 = jStat4.tukey.cdf(x0, nmeans, df) - p;
             var x1;
             if (valx0 > 0)
               x1 = Math2.max(0, x0 - 1);
             else
               x1 = x0 + 1;
-            var valx1 = jStat3.tukey.cdf(x1, nmeans, df) - p;
+            var valx1 = jStat4.tukey.cdf(x1, nmeans, df) - p;
             var ans;
             for (var iter = 1; iter < maxiter; iter++) {
               ans = x1 - valx1 * (x1 - x0) / (valx1 - valx0);
@@ -17834,7 +17834,7 @@ var require_jstat = __commonJS({
                 ans = 0;
                 valx1 = -p;
               }
-              valx1 = jStat3.tukey.cdf(ans, nmeans, df) - p;
+              valx1 = jStat4.tukey.cdf(ans, nmeans, df) - p;
               x1 = ans;
               var xabs = Math2.abs(x1 - x0);
               if (xabs < eps)
@@ -17843,46 +17843,46 @@ var require_jstat = __commonJS({
             throw new Error("tukey.inv failed to converge");
           }
         });
-      })(jStat2, Math);
-      (function(jStat3, Math2) {
+      })(jStat3, Math);
+      (function(jStat4, Math2) {
         var push = Array.prototype.push;
-        var isArray = jStat3.utils.isArray;
+        var isArray = jStat4.utils.isArray;
         function isUsable(arg) {
-          return isArray(arg) || arg instanceof jStat3;
+          return isArray(arg) || arg instanceof jStat4;
         }
-        jStat3.extend({
+        jStat4.extend({
           // add a vector/matrix to a vector/matrix or scalar
-          add: function add(arr, arg) {
+          add: function add2(arr, arg) {
             if (isUsable(arg)) {
               if (!isUsable(arg[0])) arg = [arg];
-              return jStat3.map(arr, function(value, row, col) {
-                return value + arg[row][col];
+              return jStat4.map(arr, function(value2, row, col) {
+                return value2 + arg[row][col];
               });
             }
-            return jStat3.map(arr, function(value) {
-              return value + arg;
+            return jStat4.map(arr, function(value2) {
+              return value2 + arg;
             });
           },
           // subtract a vector or scalar from the vector
           subtract: function subtract(arr, arg) {
             if (isUsable(arg)) {
               if (!isUsable(arg[0])) arg = [arg];
-              return jStat3.map(arr, function(value, row, col) {
-                return value - arg[row][col] || 0;
+              return jStat4.map(arr, function(value2, row, col) {
+                return value2 - arg[row][col] || 0;
               });
             }
-            return jStat3.map(arr, function(value) {
-              return value - arg;
+            return jStat4.map(arr, function(value2) {
+              return value2 - arg;
             });
           },
           // matrix division
           divide: function divide(arr, arg) {
             if (isUsable(arg)) {
               if (!isUsable(arg[0])) arg = [arg];
-              return jStat3.multiply(arr, jStat3.inv(arg));
+              return jStat4.multiply(arr, jStat4.inv(arg));
             }
-            return jStat3.map(arr, function(value) {
-              return value / arg;
+            return jStat4.map(arr, function(value2) {
+              return value2 / arg;
             });
           },
           // matrix multiplication
@@ -17891,7 +17891,7 @@ var require_jstat = __commonJS({
             if (arr.length === void 0 && arg.length === void 0) {
               return arr * arg;
             }
-            nrow = arr.length, ncol = arr[0].length, res = jStat3.zeros(nrow, nrescols = isUsable(arg) ? arg[0].length : ncol), rescols = 0;
+            nrow = arr.length, ncol = arr[0].length, res = jStat4.zeros(nrow, nrescols = isUsable(arg) ? arg[0].length : ncol), rescols = 0;
             if (isUsable(arg)) {
               for (; rescols < nrescols; rescols++) {
                 for (row = 0; row < nrow; row++) {
@@ -17903,8 +17903,8 @@ var require_jstat = __commonJS({
               }
               return nrow === 1 && rescols === 1 ? res[0][0] : res;
             }
-            return jStat3.map(arr, function(value) {
-              return value * arg;
+            return jStat4.map(arr, function(value2) {
+              return value2 * arg;
             });
           },
           // outer([1,2,3],[4,5,6])
@@ -17913,7 +17913,7 @@ var require_jstat = __commonJS({
           // ->
           // [[4,5,6],[8,10,12],[12,15,18]]
           outer: function outer(A, B) {
-            return jStat3.multiply(A.map(function(t) {
+            return jStat4.multiply(A.map(function(t) {
               return [t];
             }), [B]);
           },
@@ -17921,7 +17921,7 @@ var require_jstat = __commonJS({
           dot: function dot(arr, arg) {
             if (!isUsable(arr[0])) arr = [arr];
             if (!isUsable(arg[0])) arg = [arg];
-            var left = arr[0].length === 1 && arr.length !== 1 ? jStat3.transpose(arr) : arr, right = arg[0].length === 1 && arg.length !== 1 ? jStat3.transpose(arg) : arg, res = [], row = 0, nrow = left.length, ncol = left[0].length, sum, col;
+            var left = arr[0].length === 1 && arr.length !== 1 ? jStat4.transpose(arr) : arr, right = arg[0].length === 1 && arg.length !== 1 ? jStat4.transpose(arg) : arg, res = [], row = 0, nrow = left.length, ncol = left[0].length, sum, col;
             for (; row < nrow; row++) {
               res[row] = [];
               sum = 0;
@@ -17933,26 +17933,26 @@ var require_jstat = __commonJS({
           },
           // raise every element by a scalar
           pow: function pow(arr, arg) {
-            return jStat3.map(arr, function(value) {
-              return Math2.pow(value, arg);
+            return jStat4.map(arr, function(value2) {
+              return Math2.pow(value2, arg);
             });
           },
           // exponentiate every element
           exp: function exp(arr) {
-            return jStat3.map(arr, function(value) {
-              return Math2.exp(value);
+            return jStat4.map(arr, function(value2) {
+              return Math2.exp(value2);
             });
           },
           // generate the natural log of every element
           log: function exp(arr) {
-            return jStat3.map(arr, function(value) {
-              return Math2.log(value);
+            return jStat4.map(arr, function(value2) {
+              return Math2.log(value2);
             });
           },
           // generate the absolute values of the vector
           abs: function abs(arr) {
-            return jStat3.map(arr, function(value) {
-              return Math2.abs(value);
+            return jStat4.map(arr, function(value2) {
+              return Math2.abs(value2);
             });
           },
           // computes the p-norm of the vector
@@ -17969,7 +17969,7 @@ var require_jstat = __commonJS({
           // computes the angle between two vectors in rads
           // In case a matrix is passed, this uses the first row as the vector
           angle: function angle(arr, arg) {
-            return Math2.acos(jStat3.dot(arr, arg) / (jStat3.norm(arr) * jStat3.norm(arg)));
+            return Math2.acos(jStat4.dot(arr, arg) / (jStat4.norm(arr) * jStat4.norm(arg)));
           },
           // augment one matrix by another
           // Note: this function returns a matrix, not a jStat object
@@ -17990,8 +17990,8 @@ var require_jstat = __commonJS({
           inv: function inv(a) {
             var rows = a.length;
             var cols = a[0].length;
-            var b = jStat3.identity(rows, cols);
-            var c = jStat3.gauss_jordan(a, b);
+            var b = jStat4.identity(rows, cols);
+            var c = jStat4.gauss_jordan(a, b);
             var result = [];
             var i = 0;
             var j;
@@ -18027,7 +18027,7 @@ var require_jstat = __commonJS({
           },
           gauss_elimination: function gauss_elimination(a, b) {
             var i = 0, j = 0, n = a.length, m = a[0].length, factor = 1, sum = 0, x = [], maug, pivot, temp, k;
-            a = jStat3.aug(a, b);
+            a = jStat4.aug(a, b);
             maug = a[0].length;
             for (i = 0; i < n; i++) {
               pivot = a[i][i];
@@ -18062,7 +18062,7 @@ var require_jstat = __commonJS({
             return x;
           },
           gauss_jordan: function gauss_jordan(a, b) {
-            var m = jStat3.aug(a, b);
+            var m = jStat4.aug(a, b);
             var h = m.length;
             var w = m[0].length;
             var c = 0;
@@ -18109,7 +18109,7 @@ var require_jstat = __commonJS({
           // will return [[2.666],[0.1666],[1.666]]
           triaUpSolve: function triaUpSolve(A, b) {
             var size = A[0].length;
-            var x = jStat3.zeros(1, size)[0];
+            var x = jStat4.zeros(1, size)[0];
             var parts;
             var matrix_mode = false;
             if (b[0].length != void 0) {
@@ -18118,11 +18118,11 @@ var require_jstat = __commonJS({
               });
               matrix_mode = true;
             }
-            jStat3.arange(size - 1, -1, -1).forEach(function(i) {
-              parts = jStat3.arange(i + 1, size).map(function(j) {
+            jStat4.arange(size - 1, -1, -1).forEach(function(i) {
+              parts = jStat4.arange(i + 1, size).map(function(j) {
                 return x[j] * A[i][j];
               });
-              x[i] = (b[i] - jStat3.sum(parts)) / A[i][i];
+              x[i] = (b[i] - jStat4.sum(parts)) / A[i][i];
             });
             if (matrix_mode)
               return x.map(function(i) {
@@ -18132,7 +18132,7 @@ var require_jstat = __commonJS({
           },
           triaLowSolve: function triaLowSolve(A, b) {
             var size = A[0].length;
-            var x = jStat3.zeros(1, size)[0];
+            var x = jStat4.zeros(1, size)[0];
             var parts;
             var matrix_mode = false;
             if (b[0].length != void 0) {
@@ -18141,11 +18141,11 @@ var require_jstat = __commonJS({
               });
               matrix_mode = true;
             }
-            jStat3.arange(size).forEach(function(i) {
-              parts = jStat3.arange(i).map(function(j) {
+            jStat4.arange(size).forEach(function(i) {
+              parts = jStat4.arange(i).map(function(j) {
                 return A[i][j] * x[j];
               });
-              x[i] = (b[i] - jStat3.sum(parts)) / A[i][i];
+              x[i] = (b[i] - jStat4.sum(parts)) / A[i][i];
             });
             if (matrix_mode)
               return x.map(function(i) {
@@ -18159,24 +18159,24 @@ var require_jstat = __commonJS({
           // U is upper triangular matrix
           lu: function lu(A) {
             var size = A.length;
-            var L = jStat3.identity(size);
-            var R = jStat3.zeros(A.length, A[0].length);
+            var L = jStat4.identity(size);
+            var R = jStat4.zeros(A.length, A[0].length);
             var parts;
-            jStat3.arange(size).forEach(function(t) {
+            jStat4.arange(size).forEach(function(t) {
               R[0][t] = A[0][t];
             });
-            jStat3.arange(1, size).forEach(function(l) {
-              jStat3.arange(l).forEach(function(i) {
-                parts = jStat3.arange(i).map(function(jj) {
+            jStat4.arange(1, size).forEach(function(l) {
+              jStat4.arange(l).forEach(function(i) {
+                parts = jStat4.arange(i).map(function(jj) {
                   return L[l][jj] * R[jj][i];
                 });
-                L[l][i] = (A[l][i] - jStat3.sum(parts)) / R[i][i];
+                L[l][i] = (A[l][i] - jStat4.sum(parts)) / R[i][i];
               });
-              jStat3.arange(l, size).forEach(function(j) {
-                parts = jStat3.arange(l).map(function(jj) {
+              jStat4.arange(l, size).forEach(function(j) {
+                parts = jStat4.arange(l).map(function(jj) {
                   return L[l][jj] * R[jj][j];
                 });
-                R[l][j] = A[parts.length][j] - jStat3.sum(parts);
+                R[l][j] = A[parts.length][j] - jStat4.sum(parts);
               });
             });
             return [L, R];
@@ -18186,18 +18186,18 @@ var require_jstat = __commonJS({
           // T is lower triangular matrix
           cholesky: function cholesky(A) {
             var size = A.length;
-            var T = jStat3.zeros(A.length, A[0].length);
+            var T = jStat4.zeros(A.length, A[0].length);
             var parts;
-            jStat3.arange(size).forEach(function(i) {
-              parts = jStat3.arange(i).map(function(t) {
+            jStat4.arange(size).forEach(function(i) {
+              parts = jStat4.arange(i).map(function(t) {
                 return Math2.pow(T[i][t], 2);
               });
-              T[i][i] = Math2.sqrt(A[i][i] - jStat3.sum(parts));
-              jStat3.arange(i + 1, size).forEach(function(j) {
-                parts = jStat3.arange(i).map(function(t) {
+              T[i][i] = Math2.sqrt(A[i][i] - jStat4.sum(parts));
+              jStat4.arange(i + 1, size).forEach(function(j) {
+                parts = jStat4.arange(i).map(function(t) {
                   return T[i][t] * T[j][t];
                 });
-                T[j][i] = (A[i][j] - jStat3.sum(parts)) / T[i][i];
+                T[j][i] = (A[i][j] - jStat4.sum(parts)) / T[i][i];
               });
             });
             return T;
@@ -18227,14 +18227,14 @@ var require_jstat = __commonJS({
                 }
               }
             }
-            h = jStat3.multiply(jStat3.multiply(jStat3.inv(d), jStat3.add(l, u)), -1);
-            c = jStat3.multiply(jStat3.inv(d), b);
+            h = jStat4.multiply(jStat4.multiply(jStat4.inv(d), jStat4.add(l, u)), -1);
+            c = jStat4.multiply(jStat4.inv(d), b);
             xv = x;
-            xk = jStat3.add(jStat3.multiply(h, x), c);
+            xk = jStat4.add(jStat4.multiply(h, x), c);
             i = 2;
-            while (Math2.abs(jStat3.norm(jStat3.subtract(xk, xv))) > r) {
+            while (Math2.abs(jStat4.norm(jStat4.subtract(xk, xv))) > r) {
               xv = xk;
-              xk = jStat3.add(jStat3.multiply(h, xv), c);
+              xk = jStat4.add(jStat4.multiply(h, xv), c);
               i++;
             }
             return xk;
@@ -18263,14 +18263,14 @@ var require_jstat = __commonJS({
                 }
               }
             }
-            h = jStat3.multiply(jStat3.multiply(jStat3.inv(jStat3.add(d, l)), u), -1);
-            c = jStat3.multiply(jStat3.inv(jStat3.add(d, l)), b);
+            h = jStat4.multiply(jStat4.multiply(jStat4.inv(jStat4.add(d, l)), u), -1);
+            c = jStat4.multiply(jStat4.inv(jStat4.add(d, l)), b);
             xv = x;
-            xk = jStat3.add(jStat3.multiply(h, x), c);
+            xk = jStat4.add(jStat4.multiply(h, x), c);
             i = 2;
-            while (Math2.abs(jStat3.norm(jStat3.subtract(xk, xv))) > r) {
+            while (Math2.abs(jStat4.norm(jStat4.subtract(xk, xv))) > r) {
               xv = xk;
-              xk = jStat3.add(jStat3.multiply(h, xv), c);
+              xk = jStat4.add(jStat4.multiply(h, xv), c);
               i = i + 1;
             }
             return xk;
@@ -18299,23 +18299,23 @@ var require_jstat = __commonJS({
                 }
               }
             }
-            h = jStat3.multiply(
-              jStat3.inv(jStat3.add(d, jStat3.multiply(l, w))),
-              jStat3.subtract(
-                jStat3.multiply(d, 1 - w),
-                jStat3.multiply(u, w)
+            h = jStat4.multiply(
+              jStat4.inv(jStat4.add(d, jStat4.multiply(l, w))),
+              jStat4.subtract(
+                jStat4.multiply(d, 1 - w),
+                jStat4.multiply(u, w)
               )
             );
-            c = jStat3.multiply(jStat3.multiply(jStat3.inv(jStat3.add(
+            c = jStat4.multiply(jStat4.multiply(jStat4.inv(jStat4.add(
               d,
-              jStat3.multiply(l, w)
+              jStat4.multiply(l, w)
             )), b), w);
             xv = x;
-            xk = jStat3.add(jStat3.multiply(h, x), c);
+            xk = jStat4.add(jStat4.multiply(h, x), c);
             i = 2;
-            while (Math2.abs(jStat3.norm(jStat3.subtract(xk, xv))) > r) {
+            while (Math2.abs(jStat4.norm(jStat4.subtract(xk, xv))) > r) {
               xv = xk;
-              xk = jStat3.add(jStat3.multiply(h, xv), c);
+              xk = jStat4.add(jStat4.multiply(h, xv), c);
               i++;
             }
             return xk;
@@ -18334,14 +18334,14 @@ var require_jstat = __commonJS({
               factor = a[i + 1][i] > 0 ? -1 : 1;
               alpha = factor * Math2.sqrt(alpha);
               r = Math2.sqrt((alpha * alpha - a[i + 1][i] * alpha) / 2);
-              w = jStat3.zeros(m, 1);
+              w = jStat4.zeros(m, 1);
               w[i + 1][0] = (a[i + 1][i] - alpha) / (2 * r);
               for (k = i + 2; k < m; k++) w[k][0] = a[k][i] / (2 * r);
-              p = jStat3.subtract(
-                jStat3.identity(m, n),
-                jStat3.multiply(jStat3.multiply(w, jStat3.transpose(w)), 2)
+              p = jStat4.subtract(
+                jStat4.identity(m, n),
+                jStat4.multiply(jStat4.multiply(w, jStat4.transpose(w)), 2)
               );
-              a = jStat3.multiply(p, jStat3.multiply(a, p));
+              a = jStat4.multiply(p, jStat4.multiply(a, p));
             }
             return a;
           },
@@ -18349,13 +18349,13 @@ var require_jstat = __commonJS({
           // Q is orthogonal matrix
           // R is upper triangular
           QR: (function() {
-            var sum = jStat3.sum;
-            var range = jStat3.arange;
+            var sum = jStat4.sum;
+            var range = jStat4.arange;
             function qr2(x) {
               var n = x.length;
               var p = x[0].length;
-              var r = jStat3.zeros(p, p);
-              x = jStat3.copy(x);
+              var r = jStat4.zeros(p, p);
+              x = jStat4.copy(x);
               var i, j, k;
               for (j = 0; j < p; j++) {
                 r[j][j] = Math2.sqrt(sum(range(n).map(function(i2) {
@@ -18379,28 +18379,28 @@ var require_jstat = __commonJS({
           })(),
           lstsq: /* @__PURE__ */ (function() {
             function R_I(A) {
-              A = jStat3.copy(A);
+              A = jStat4.copy(A);
               var size = A.length;
-              var I = jStat3.identity(size);
-              jStat3.arange(size - 1, -1, -1).forEach(function(i) {
-                jStat3.sliceAssign(
+              var I = jStat4.identity(size);
+              jStat4.arange(size - 1, -1, -1).forEach(function(i) {
+                jStat4.sliceAssign(
                   I,
                   { row: i },
-                  jStat3.divide(jStat3.slice(I, { row: i }), A[i][i])
+                  jStat4.divide(jStat4.slice(I, { row: i }), A[i][i])
                 );
-                jStat3.sliceAssign(
+                jStat4.sliceAssign(
                   A,
                   { row: i },
-                  jStat3.divide(jStat3.slice(A, { row: i }), A[i][i])
+                  jStat4.divide(jStat4.slice(A, { row: i }), A[i][i])
                 );
-                jStat3.arange(i).forEach(function(j) {
-                  var c = jStat3.multiply(A[j][i], -1);
-                  var Aj = jStat3.slice(A, { row: j });
-                  var cAi = jStat3.multiply(jStat3.slice(A, { row: i }), c);
-                  jStat3.sliceAssign(A, { row: j }, jStat3.add(Aj, cAi));
-                  var Ij = jStat3.slice(I, { row: j });
-                  var cIi = jStat3.multiply(jStat3.slice(I, { row: i }), c);
-                  jStat3.sliceAssign(I, { row: j }, jStat3.add(Ij, cIi));
+                jStat4.arange(i).forEach(function(j) {
+                  var c = jStat4.multiply(A[j][i], -1);
+                  var Aj = jStat4.slice(A, { row: j });
+                  var cAi = jStat4.multiply(jStat4.slice(A, { row: i }), c);
+                  jStat4.sliceAssign(A, { row: j }, jStat4.add(Aj, cAi));
+                  var Ij = jStat4.slice(I, { row: j });
+                  var cIi = jStat4.multiply(jStat4.slice(I, { row: i }), c);
+                  jStat4.sliceAssign(I, { row: j }, jStat4.add(Ij, cIi));
                 });
               });
               return I;
@@ -18413,18 +18413,18 @@ var require_jstat = __commonJS({
                 });
                 array_mode = true;
               }
-              var QR = jStat3.QR(A);
+              var QR = jStat4.QR(A);
               var Q = QR[0];
               var R = QR[1];
               var attrs = A[0].length;
-              var Q1 = jStat3.slice(Q, { col: { end: attrs } });
-              var R1 = jStat3.slice(R, { row: { end: attrs } });
+              var Q1 = jStat4.slice(Q, { col: { end: attrs } });
+              var R1 = jStat4.slice(R, { row: { end: attrs } });
               var RI = R_I(R1);
-              var Q2 = jStat3.transpose(Q1);
+              var Q2 = jStat4.transpose(Q1);
               if (Q2[0].length === void 0) {
                 Q2 = [Q2];
               }
-              var x = jStat3.multiply(jStat3.multiply(RI, Q2), b);
+              var x = jStat4.multiply(jStat4.multiply(RI, Q2), b);
               if (x.length === void 0) {
                 x = [[x]];
               }
@@ -18439,7 +18439,7 @@ var require_jstat = __commonJS({
           jacobi: function jacobi(a) {
             var condition = 1;
             var n = a.length;
-            var e = jStat3.identity(n, n);
+            var e = jStat4.identity(n, n);
             var ev = [];
             var b, i, j, p, q, maxim, theta, s;
             while (condition === 1) {
@@ -18461,13 +18461,13 @@ var require_jstat = __commonJS({
                 theta = a[p][q] > 0 ? Math2.PI / 4 : -Math2.PI / 4;
               else
                 theta = Math2.atan(2 * a[p][q] / (a[p][p] - a[q][q])) / 2;
-              s = jStat3.identity(n, n);
+              s = jStat4.identity(n, n);
               s[p][p] = Math2.cos(theta);
               s[p][q] = -Math2.sin(theta);
               s[q][p] = Math2.sin(theta);
               s[q][q] = Math2.cos(theta);
-              e = jStat3.multiply(e, s);
-              b = jStat3.multiply(jStat3.multiply(jStat3.inv(s), a), s);
+              e = jStat4.multiply(e, s);
+              b = jStat4.multiply(jStat4.multiply(jStat4.inv(s), a), s);
               a = b;
               condition = 0;
               for (i = 1; i < n; i++) {
@@ -18585,7 +18585,7 @@ var require_jstat = __commonJS({
             }
             return h / 3 * (I + f(b));
           },
-          hermite: function hermite(X, F, dF, value) {
+          hermite: function hermite(X, F, dF, value2) {
             var n = X.length;
             var p = 0;
             var i = 0;
@@ -18597,19 +18597,19 @@ var require_jstat = __commonJS({
             for (; i < n; i++) {
               l[i] = 1;
               for (j = 0; j < n; j++) {
-                if (i != j) l[i] *= (value - X[j]) / (X[i] - X[j]);
+                if (i != j) l[i] *= (value2 - X[j]) / (X[i] - X[j]);
               }
               dl[i] = 0;
               for (j = 0; j < n; j++) {
                 if (i != j) dl[i] += 1 / (X[i] - X[j]);
               }
-              A[i] = (1 - 2 * (value - X[i]) * dl[i]) * (l[i] * l[i]);
-              B[i] = (value - X[i]) * (l[i] * l[i]);
+              A[i] = (1 - 2 * (value2 - X[i]) * dl[i]) * (l[i] * l[i]);
+              B[i] = (value2 - X[i]) * (l[i] * l[i]);
               p += A[i] * F[i] + B[i] * dF[i];
             }
             return p;
           },
-          lagrange: function lagrange(X, F, value) {
+          lagrange: function lagrange(X, F, value2) {
             var p = 0;
             var i = 0;
             var j, l;
@@ -18617,13 +18617,13 @@ var require_jstat = __commonJS({
             for (; i < n; i++) {
               l = F[i];
               for (j = 0; j < n; j++) {
-                if (i != j) l *= (value - X[j]) / (X[i] - X[j]);
+                if (i != j) l *= (value2 - X[j]) / (X[i] - X[j]);
               }
               p += l;
             }
             return p;
           },
-          cubic_spline: function cubic_spline(X, F, value) {
+          cubic_spline: function cubic_spline(X, F, value2) {
             var n = X.length;
             var i = 0, j;
             var A = [];
@@ -18647,16 +18647,16 @@ var require_jstat = __commonJS({
               A[i][i + 1] = h[i];
               B[i][0] = alpha[i];
             }
-            c = jStat3.multiply(jStat3.inv(A), B);
+            c = jStat4.multiply(jStat4.inv(A), B);
             for (j = 0; j < n - 1; j++) {
               b[j] = (F[j + 1] - F[j]) / h[j] - h[j] * (c[j + 1][0] + 2 * c[j][0]) / 3;
               d[j] = (c[j + 1][0] - c[j][0]) / (3 * h[j]);
             }
             for (j = 0; j < n; j++) {
-              if (X[j] > value) break;
+              if (X[j] > value2) break;
             }
             j -= 1;
-            return F[j] + (value - X[j]) * b[j] + jStat3.sq(value - X[j]) * c[j] + (value - X[j]) * jStat3.sq(value - X[j]) * d[j];
+            return F[j] + (value2 - X[j]) * b[j] + jStat4.sq(value2 - X[j]) * c[j] + (value2 - X[j]) * jStat4.sq(value2 - X[j]) * d[j];
           },
           gauss_quadrature: function gauss_quadrature() {
             throw new Error("gauss_quadrature not yet implemented");
@@ -18677,7 +18677,7 @@ var require_jstat = __commonJS({
             var V = [];
             var Vt = [];
             for (i = 0; i < m; i++) {
-              u[i] = jStat3.sum(X[i]) / n;
+              u[i] = jStat4.sum(X[i]) / n;
             }
             for (i = 0; i < n; i++) {
               B[i] = [];
@@ -18685,17 +18685,17 @@ var require_jstat = __commonJS({
                 B[i][j] = X[j][i] - u[j];
               }
             }
-            B = jStat3.transpose(B);
+            B = jStat4.transpose(B);
             for (i = 0; i < m; i++) {
               C[i] = [];
               for (j = 0; j < m; j++) {
-                C[i][j] = jStat3.dot([B[i]], [B[j]]) / (n - 1);
+                C[i][j] = jStat4.dot([B[i]], [B[j]]) / (n - 1);
               }
             }
-            result = jStat3.jacobi(C);
+            result = jStat4.jacobi(C);
             V = result[0];
             D = result[1];
-            Vt = jStat3.transpose(V);
+            Vt = jStat4.transpose(V);
             for (i = 0; i < D.length; i++) {
               for (j = i; j < D.length; j++) {
                 if (D[i] < D[j]) {
@@ -18708,11 +18708,11 @@ var require_jstat = __commonJS({
                 }
               }
             }
-            Bt = jStat3.transpose(B);
+            Bt = jStat4.transpose(B);
             for (i = 0; i < m; i++) {
               Y[i] = [];
               for (j = 0; j < Bt.length; j++) {
-                Y[i][j] = jStat3.dot([Vt[i]], [Bt[j]]);
+                Y[i][j] = jStat4.dot([Vt[i]], [Bt[j]]);
               }
             }
             return [X, D, Vt, Y];
@@ -18720,27 +18720,27 @@ var require_jstat = __commonJS({
         });
         (function(funcs) {
           for (var i = 0; i < funcs.length; i++) (function(passfunc) {
-            jStat3.fn[passfunc] = function(arg, func) {
+            jStat4.fn[passfunc] = function(arg, func) {
               var tmpthis = this;
               if (func) {
                 setTimeout(function() {
-                  func.call(tmpthis, jStat3.fn[passfunc].call(tmpthis, arg));
+                  func.call(tmpthis, jStat4.fn[passfunc].call(tmpthis, arg));
                 }, 15);
                 return this;
               }
-              if (typeof jStat3[passfunc](this, arg) === "number")
-                return jStat3[passfunc](this, arg);
+              if (typeof jStat4[passfunc](this, arg) === "number")
+                return jStat4[passfunc](this, arg);
               else
-                return jStat3(jStat3[passfunc](this, arg));
+                return jStat4(jStat4[passfunc](this, arg));
             };
           })(funcs[i]);
         })("add divide multiply subtract dot pow exp log abs norm angle".split(" "));
-      })(jStat2, Math);
-      (function(jStat3, Math2) {
+      })(jStat3, Math);
+      (function(jStat4, Math2) {
         var slice = [].slice;
-        var isNumber = jStat3.utils.isNumber;
-        var isArray = jStat3.utils.isArray;
-        jStat3.extend({
+        var isNumber = jStat4.utils.isNumber;
+        var isArray = jStat4.utils.isArray;
+        jStat4.extend({
           // 2 different parameter lists:
           // (value, mean, sd)
           // (value, array, flag)
@@ -18749,7 +18749,7 @@ var require_jstat = __commonJS({
             if (isNumber(args[1])) {
               return (args[0] - args[1]) / args[2];
             }
-            return (args[0] - jStat3.mean(args[1])) / jStat3.stdev(args[1], args[2]);
+            return (args[0] - jStat4.mean(args[1])) / jStat4.stdev(args[1], args[2]);
           },
           // 3 different paramter lists:
           // (value, mean, sd, sides)
@@ -18759,35 +18759,35 @@ var require_jstat = __commonJS({
             var args = slice.call(arguments);
             var z;
             if (isArray(args[1])) {
-              z = jStat3.zscore(args[0], args[1], args[3]);
-              return args[2] === 1 ? jStat3.normal.cdf(-Math2.abs(z), 0, 1) : jStat3.normal.cdf(-Math2.abs(z), 0, 1) * 2;
+              z = jStat4.zscore(args[0], args[1], args[3]);
+              return args[2] === 1 ? jStat4.normal.cdf(-Math2.abs(z), 0, 1) : jStat4.normal.cdf(-Math2.abs(z), 0, 1) * 2;
             } else {
               if (args.length > 2) {
-                z = jStat3.zscore(args[0], args[1], args[2]);
-                return args[3] === 1 ? jStat3.normal.cdf(-Math2.abs(z), 0, 1) : jStat3.normal.cdf(-Math2.abs(z), 0, 1) * 2;
+                z = jStat4.zscore(args[0], args[1], args[2]);
+                return args[3] === 1 ? jStat4.normal.cdf(-Math2.abs(z), 0, 1) : jStat4.normal.cdf(-Math2.abs(z), 0, 1) * 2;
               } else {
                 z = args[0];
-                return args[1] === 1 ? jStat3.normal.cdf(-Math2.abs(z), 0, 1) : jStat3.normal.cdf(-Math2.abs(z), 0, 1) * 2;
+                return args[1] === 1 ? jStat4.normal.cdf(-Math2.abs(z), 0, 1) : jStat4.normal.cdf(-Math2.abs(z), 0, 1) * 2;
               }
             }
           }
         });
-        jStat3.extend(jStat3.fn, {
-          zscore: function zscore(value, flag) {
-            return (value - this.mean()) / this.stdev(flag);
+        jStat4.extend(jStat4.fn, {
+          zscore: function zscore(value2, flag) {
+            return (value2 - this.mean()) / this.stdev(flag);
           },
-          ztest: function ztest(value, sides, flag) {
-            var zscore = Math2.abs(this.zscore(value, flag));
-            return sides === 1 ? jStat3.normal.cdf(-zscore, 0, 1) : jStat3.normal.cdf(-zscore, 0, 1) * 2;
+          ztest: function ztest(value2, sides, flag) {
+            var zscore = Math2.abs(this.zscore(value2, flag));
+            return sides === 1 ? jStat4.normal.cdf(-zscore, 0, 1) : jStat4.normal.cdf(-zscore, 0, 1) * 2;
           }
         });
-        jStat3.extend({
+        jStat4.extend({
           // 2 parameter lists
           // (value, mean, sd, n)
           // (value, array)
           tscore: function tscore() {
             var args = slice.call(arguments);
-            return args.length === 4 ? (args[0] - args[1]) / (args[2] / Math2.sqrt(args[3])) : (args[0] - jStat3.mean(args[1])) / (jStat3.stdev(args[1], true) / Math2.sqrt(args[1].length));
+            return args.length === 4 ? (args[0] - args[1]) / (args[2] / Math2.sqrt(args[3])) : (args[0] - jStat4.mean(args[1])) / (jStat4.stdev(args[1], true) / Math2.sqrt(args[1].length));
           },
           // 3 different paramter lists:
           // (value, mean, sd, n, sides)
@@ -18797,26 +18797,26 @@ var require_jstat = __commonJS({
             var args = slice.call(arguments);
             var tscore;
             if (args.length === 5) {
-              tscore = Math2.abs(jStat3.tscore(args[0], args[1], args[2], args[3]));
-              return args[4] === 1 ? jStat3.studentt.cdf(-tscore, args[3] - 1) : jStat3.studentt.cdf(-tscore, args[3] - 1) * 2;
+              tscore = Math2.abs(jStat4.tscore(args[0], args[1], args[2], args[3]));
+              return args[4] === 1 ? jStat4.studentt.cdf(-tscore, args[3] - 1) : jStat4.studentt.cdf(-tscore, args[3] - 1) * 2;
             }
             if (isNumber(args[1])) {
               tscore = Math2.abs(args[0]);
-              return args[2] == 1 ? jStat3.studentt.cdf(-tscore, args[1] - 1) : jStat3.studentt.cdf(-tscore, args[1] - 1) * 2;
+              return args[2] == 1 ? jStat4.studentt.cdf(-tscore, args[1] - 1) : jStat4.studentt.cdf(-tscore, args[1] - 1) * 2;
             }
-            tscore = Math2.abs(jStat3.tscore(args[0], args[1]));
-            return args[2] == 1 ? jStat3.studentt.cdf(-tscore, args[1].length - 1) : jStat3.studentt.cdf(-tscore, args[1].length - 1) * 2;
+            tscore = Math2.abs(jStat4.tscore(args[0], args[1]));
+            return args[2] == 1 ? jStat4.studentt.cdf(-tscore, args[1].length - 1) : jStat4.studentt.cdf(-tscore, args[1].length - 1) * 2;
           }
         });
-        jStat3.extend(jStat3.fn, {
-          tscore: function tscore(value) {
-            return (value - this.mean()) / (this.stdev(true) / Math2.sqrt(this.cols()));
+        jStat4.extend(jStat4.fn, {
+          tscore: function tscore(value2) {
+            return (value2 - this.mean()) / (this.stdev(true) / Math2.sqrt(this.cols()));
           },
-          ttest: function ttest(value, sides) {
-            return sides === 1 ? 1 - jStat3.studentt.cdf(Math2.abs(this.tscore(value)), this.cols() - 1) : jStat3.studentt.cdf(-Math2.abs(this.tscore(value)), this.cols() - 1) * 2;
+          ttest: function ttest(value2, sides) {
+            return sides === 1 ? 1 - jStat4.studentt.cdf(Math2.abs(this.tscore(value2)), this.cols() - 1) : jStat4.studentt.cdf(-Math2.abs(this.tscore(value2)), this.cols() - 1) * 2;
           }
         });
-        jStat3.extend({
+        jStat4.extend({
           // Paramter list is as follows:
           // (array1, array2, array3, ...)
           // or it is an array of arrays
@@ -18834,15 +18834,15 @@ var require_jstat = __commonJS({
             for (i = 0; i < args.length; i++) {
               sample = sample.concat(args[i]);
             }
-            sampMean = jStat3.mean(sample);
+            sampMean = jStat4.mean(sample);
             expVar = 0;
             for (i = 0; i < args.length; i++) {
-              expVar = expVar + args[i].length * Math2.pow(jStat3.mean(args[i]) - sampMean, 2);
+              expVar = expVar + args[i].length * Math2.pow(jStat4.mean(args[i]) - sampMean, 2);
             }
             expVar /= args.length - 1;
             unexpVar = 0;
             for (i = 0; i < args.length; i++) {
-              sampSampMean = jStat3.mean(args[i]);
+              sampSampMean = jStat4.mean(args[i]);
               for (j = 0; j < args[i].length; j++) {
                 unexpVar += Math2.pow(args[i][j] - sampSampMean, 2);
               }
@@ -18856,24 +18856,24 @@ var require_jstat = __commonJS({
           anovaftest: function anovaftest() {
             var args = slice.call(arguments), df1, df2, n, i;
             if (isNumber(args[0])) {
-              return 1 - jStat3.centralF.cdf(args[0], args[1], args[2]);
+              return 1 - jStat4.centralF.cdf(args[0], args[1], args[2]);
             }
-            var anovafscore = jStat3.anovafscore(args);
+            var anovafscore = jStat4.anovafscore(args);
             df1 = args.length - 1;
             n = 0;
             for (i = 0; i < args.length; i++) {
               n = n + args[i].length;
             }
             df2 = n - df1 - 1;
-            return 1 - jStat3.centralF.cdf(anovafscore, df1, df2);
+            return 1 - jStat4.centralF.cdf(anovafscore, df1, df2);
           },
           ftest: function ftest(fscore, df1, df2) {
-            return 1 - jStat3.centralF.cdf(fscore, df1, df2);
+            return 1 - jStat4.centralF.cdf(fscore, df1, df2);
           }
         });
-        jStat3.extend(jStat3.fn, {
+        jStat4.extend(jStat4.fn, {
           anovafscore: function anovafscore() {
-            return jStat3.anovafscore(this.toArray());
+            return jStat4.anovafscore(this.toArray());
           },
           anovaftes: function anovaftes() {
             var n = 0;
@@ -18881,10 +18881,10 @@ var require_jstat = __commonJS({
             for (i = 0; i < this.length; i++) {
               n = n + this[i].length;
             }
-            return jStat3.ftest(this.anovafscore(), this.length - 1, n - this.length);
+            return jStat4.ftest(this.anovafscore(), this.length - 1, n - this.length);
           }
         });
-        jStat3.extend({
+        jStat4.extend({
           // 2 parameter lists
           // (mean1, mean2, n1, n2, sd)
           // (array1, array2, sd)
@@ -18898,8 +18898,8 @@ var require_jstat = __commonJS({
               n2 = args[3];
               sd = args[4];
             } else {
-              mean1 = jStat3.mean(args[0]);
-              mean2 = jStat3.mean(args[1]);
+              mean1 = jStat4.mean(args[0]);
+              mean2 = jStat4.mean(args[1]);
               n1 = args[0].length;
               n2 = args[1].length;
               sd = args[2];
@@ -18917,20 +18917,20 @@ var require_jstat = __commonJS({
               qscore = args[0];
               args = args.slice(1);
             } else if (args.length === 7) {
-              qscore = jStat3.qscore(args[0], args[1], args[2], args[3], args[4]);
+              qscore = jStat4.qscore(args[0], args[1], args[2], args[3], args[4]);
               args = args.slice(5);
             } else {
-              qscore = jStat3.qscore(args[0], args[1], args[2]);
+              qscore = jStat4.qscore(args[0], args[1], args[2]);
               args = args.slice(3);
             }
             var n = args[0];
             var k = args[1];
-            return 1 - jStat3.tukey.cdf(qscore, k, n - k);
+            return 1 - jStat4.tukey.cdf(qscore, k, n - k);
           },
           tukeyhsd: function tukeyhsd(arrays) {
-            var sd = jStat3.pooledstdev(arrays);
+            var sd = jStat4.pooledstdev(arrays);
             var means = arrays.map(function(arr) {
-              return jStat3.mean(arr);
+              return jStat4.mean(arr);
             });
             var n = arrays.reduce(function(n2, arr) {
               return n2 + arr.length;
@@ -18938,52 +18938,52 @@ var require_jstat = __commonJS({
             var results = [];
             for (var i = 0; i < arrays.length; ++i) {
               for (var j = i + 1; j < arrays.length; ++j) {
-                var p = jStat3.qtest(means[i], means[j], arrays[i].length, arrays[j].length, sd, n, arrays.length);
+                var p = jStat4.qtest(means[i], means[j], arrays[i].length, arrays[j].length, sd, n, arrays.length);
                 results.push([[i, j], p]);
               }
             }
             return results;
           }
         });
-        jStat3.extend({
+        jStat4.extend({
           // 2 different parameter setups
           // (value, alpha, sd, n)
           // (value, alpha, array)
           normalci: function normalci() {
-            var args = slice.call(arguments), ans = new Array(2), change;
+            var args = slice.call(arguments), ans = new Array(2), change2;
             if (args.length === 4) {
-              change = Math2.abs(jStat3.normal.inv(args[1] / 2, 0, 1) * args[2] / Math2.sqrt(args[3]));
+              change2 = Math2.abs(jStat4.normal.inv(args[1] / 2, 0, 1) * args[2] / Math2.sqrt(args[3]));
             } else {
-              change = Math2.abs(jStat3.normal.inv(args[1] / 2, 0, 1) * jStat3.stdev(args[2]) / Math2.sqrt(args[2].length));
+              change2 = Math2.abs(jStat4.normal.inv(args[1] / 2, 0, 1) * jStat4.stdev(args[2]) / Math2.sqrt(args[2].length));
             }
-            ans[0] = args[0] - change;
-            ans[1] = args[0] + change;
+            ans[0] = args[0] - change2;
+            ans[1] = args[0] + change2;
             return ans;
           },
           // 2 different parameter setups
           // (value, alpha, sd, n)
           // (value, alpha, array)
           tci: function tci() {
-            var args = slice.call(arguments), ans = new Array(2), change;
+            var args = slice.call(arguments), ans = new Array(2), change2;
             if (args.length === 4) {
-              change = Math2.abs(jStat3.studentt.inv(args[1] / 2, args[3] - 1) * args[2] / Math2.sqrt(args[3]));
+              change2 = Math2.abs(jStat4.studentt.inv(args[1] / 2, args[3] - 1) * args[2] / Math2.sqrt(args[3]));
             } else {
-              change = Math2.abs(jStat3.studentt.inv(args[1] / 2, args[2].length - 1) * jStat3.stdev(args[2], true) / Math2.sqrt(args[2].length));
+              change2 = Math2.abs(jStat4.studentt.inv(args[1] / 2, args[2].length - 1) * jStat4.stdev(args[2], true) / Math2.sqrt(args[2].length));
             }
-            ans[0] = args[0] - change;
-            ans[1] = args[0] + change;
+            ans[0] = args[0] - change2;
+            ans[1] = args[0] + change2;
             return ans;
           },
           significant: function significant(pvalue, alpha) {
             return pvalue < alpha;
           }
         });
-        jStat3.extend(jStat3.fn, {
-          normalci: function normalci(value, alpha) {
-            return jStat3.normalci(value, alpha, this.toArray());
+        jStat4.extend(jStat4.fn, {
+          normalci: function normalci(value2, alpha) {
+            return jStat4.normalci(value2, alpha, this.toArray());
           },
-          tci: function tci(value, alpha) {
-            return jStat3.tci(value, alpha, this.toArray());
+          tci: function tci(value2, alpha) {
+            return jStat4.tci(value2, alpha, this.toArray());
           }
         });
         function differenceOfProportions(p1, n1, p2, n2) {
@@ -18994,29 +18994,29 @@ var require_jstat = __commonJS({
           var se = Math2.sqrt(pooled * (1 - pooled) * (1 / n1 + 1 / n2));
           return (p1 - p2) / se;
         }
-        jStat3.extend(jStat3.fn, {
+        jStat4.extend(jStat4.fn, {
           oneSidedDifferenceOfProportions: function oneSidedDifferenceOfProportions(p1, n1, p2, n2) {
             var z = differenceOfProportions(p1, n1, p2, n2);
-            return jStat3.ztest(z, 1);
+            return jStat4.ztest(z, 1);
           },
           twoSidedDifferenceOfProportions: function twoSidedDifferenceOfProportions(p1, n1, p2, n2) {
             var z = differenceOfProportions(p1, n1, p2, n2);
-            return jStat3.ztest(z, 2);
+            return jStat4.ztest(z, 2);
           }
         });
-      })(jStat2, Math);
-      jStat2.models = /* @__PURE__ */ (function() {
+      })(jStat3, Math);
+      jStat3.models = /* @__PURE__ */ (function() {
         function sub_regress(exog) {
           var var_count = exog[0].length;
-          var modelList = jStat2.arange(var_count).map(function(endog_index) {
-            var exog_index = jStat2.arange(var_count).filter(function(i) {
+          var modelList = jStat3.arange(var_count).map(function(endog_index) {
+            var exog_index = jStat3.arange(var_count).filter(function(i) {
               return i !== endog_index;
             });
             return ols(
-              jStat2.col(exog, endog_index).map(function(x) {
+              jStat3.col(exog, endog_index).map(function(x) {
                 return x[0];
               }),
-              jStat2.col(exog, exog_index)
+              jStat3.col(exog, exog_index)
             );
           });
           return modelList;
@@ -19025,18 +19025,18 @@ var require_jstat = __commonJS({
           var nobs = endog.length;
           var df_model = exog[0].length - 1;
           var df_resid = nobs - df_model - 1;
-          var coef = jStat2.lstsq(exog, endog);
-          var predict = jStat2.multiply(exog, coef.map(function(x) {
+          var coef = jStat3.lstsq(exog, endog);
+          var predict = jStat3.multiply(exog, coef.map(function(x) {
             return [x];
           })).map(function(p) {
             return p[0];
           });
-          var resid = jStat2.subtract(endog, predict);
-          var ybar = jStat2.mean(endog);
-          var SSE = jStat2.sum(predict.map(function(f) {
+          var resid = jStat3.subtract(endog, predict);
+          var ybar = jStat3.mean(endog);
+          var SSE = jStat3.sum(predict.map(function(f) {
             return Math.pow(f - ybar, 2);
           }));
-          var SSR = jStat2.sum(endog.map(function(y, i) {
+          var SSR = jStat3.sum(endog.map(function(y, i) {
             return Math.pow(y - predict[i], 2);
           }));
           var SST = SSE + SSR;
@@ -19068,11 +19068,11 @@ var require_jstat = __commonJS({
           var tStatistic = model.coef.map(function(coef, i) {
             return (coef - 0) / seBetaHat[i];
           });
-          var pValue2 = tStatistic.map(function(t) {
-            var leftppf = jStat2.studentt.cdf(t, model.df_resid);
+          var pValue = tStatistic.map(function(t) {
+            var leftppf = jStat3.studentt.cdf(t, model.df_resid);
             return (leftppf > 0.5 ? 1 - leftppf : leftppf) * 2;
           });
-          var c = jStat2.studentt.inv(0.975, model.df_resid);
+          var c = jStat3.studentt.inv(0.975, model.df_resid);
           var interval95 = model.coef.map(function(coef, i) {
             var d = c * seBetaHat[i];
             return [coef - d, coef + d];
@@ -19080,7 +19080,7 @@ var require_jstat = __commonJS({
           return {
             se: seBetaHat,
             t: tStatistic,
-            p: pValue2,
+            p: pValue,
             sigmaHat,
             interval95
           };
@@ -19088,7 +19088,7 @@ var require_jstat = __commonJS({
         function F_test(model) {
           var F_statistic = model.R2 / model.df_model / ((1 - model.R2) / model.df_resid);
           var fcdf = function(x, n1, n2) {
-            return jStat2.beta.cdf(x / (n2 / n1 + x), n1 / 2, n2 / 2);
+            return jStat3.beta.cdf(x / (n2 / n1 + x), n1 / 2, n2 / 2);
           };
           var pvalue = 1 - fcdf(F_statistic, model.df_model, model.df_resid);
           return { F_statistic, pvalue };
@@ -19105,14 +19105,14 @@ var require_jstat = __commonJS({
         }
         return { ols: ols_wrap };
       })();
-      jStat2.extend({
+      jStat3.extend({
         buildxmatrix: function buildxmatrix() {
           var matrixRows = new Array(arguments.length);
           for (var i = 0; i < arguments.length; i++) {
             var array = [1];
             matrixRows[i] = array.concat(arguments[i]);
           }
-          return jStat2(matrixRows);
+          return jStat3(matrixRows);
         },
         builddxmatrix: function builddxmatrix() {
           var matrixRows = new Array(arguments[0].length);
@@ -19120,17 +19120,17 @@ var require_jstat = __commonJS({
             var array = [1];
             matrixRows[i] = array.concat(arguments[0][i]);
           }
-          return jStat2(matrixRows);
+          return jStat3(matrixRows);
         },
         buildjxmatrix: function buildjxmatrix(jMat) {
           var pass = new Array(jMat.length);
           for (var i = 0; i < jMat.length; i++) {
             pass[i] = jMat[i];
           }
-          return jStat2.builddxmatrix(pass);
+          return jStat3.builddxmatrix(pass);
         },
         buildymatrix: function buildymatrix(array) {
-          return jStat2(array).transpose();
+          return jStat3(array).transpose();
         },
         buildjymatrix: function buildjymatrix(jMat) {
           return jMat.transpose();
@@ -19150,7 +19150,7 @@ var require_jstat = __commonJS({
                   result[i][j] = sum;
                 }
               }
-              return jStat2(result);
+              return jStat3(result);
             }
             result = [];
             for (i = 0; i < A.rows(); i++) {
@@ -19163,34 +19163,34 @@ var require_jstat = __commonJS({
                 result[i][j] = sum;
               }
             }
-            return jStat2(result);
+            return jStat3(result);
           }
         },
         //regress and regresst to be fixed
         regress: function regress(jMatX, jMatY) {
-          var innerinv = jStat2.xtranspxinv(jMatX);
+          var innerinv = jStat3.xtranspxinv(jMatX);
           var xtransp = jMatX.transpose();
-          var next = jStat2.matrixmult(jStat2(innerinv), xtransp);
-          return jStat2.matrixmult(next, jMatY);
+          var next = jStat3.matrixmult(jStat3(innerinv), xtransp);
+          return jStat3.matrixmult(next, jMatY);
         },
         regresst: function regresst(jMatX, jMatY, sides) {
-          var beta = jStat2.regress(jMatX, jMatY);
+          var beta = jStat3.regress(jMatX, jMatY);
           var compile = {};
           compile.anova = {};
-          var jMatYBar = jStat2.jMatYBar(jMatX, beta);
+          var jMatYBar = jStat3.jMatYBar(jMatX, beta);
           compile.yBar = jMatYBar;
           var yAverage = jMatY.mean();
-          compile.anova.residuals = jStat2.residuals(jMatY, jMatYBar);
-          compile.anova.ssr = jStat2.ssr(jMatYBar, yAverage);
+          compile.anova.residuals = jStat3.residuals(jMatY, jMatYBar);
+          compile.anova.ssr = jStat3.ssr(jMatYBar, yAverage);
           compile.anova.msr = compile.anova.ssr / (jMatX[0].length - 1);
-          compile.anova.sse = jStat2.sse(jMatY, jMatYBar);
+          compile.anova.sse = jStat3.sse(jMatY, jMatYBar);
           compile.anova.mse = compile.anova.sse / (jMatY.length - (jMatX[0].length - 1) - 1);
-          compile.anova.sst = jStat2.sst(jMatY, yAverage);
+          compile.anova.sst = jStat3.sst(jMatY, yAverage);
           compile.anova.mst = compile.anova.sst / (jMatY.length - 1);
           compile.anova.r2 = 1 - compile.anova.sse / compile.anova.sst;
           if (compile.anova.r2 < 0) compile.anova.r2 = 0;
           compile.anova.fratio = compile.anova.msr / compile.anova.mse;
-          compile.anova.pvalue = jStat2.anovaftest(
+          compile.anova.pvalue = jStat3.anovaftest(
             compile.anova.fratio,
             jMatX[0].length - 1,
             jMatY.length - (jMatX[0].length - 1) - 1
@@ -19199,31 +19199,31 @@ var require_jstat = __commonJS({
           compile.anova.r2adj = 1 - compile.anova.mse / compile.anova.mst;
           if (compile.anova.r2adj < 0) compile.anova.r2adj = 0;
           compile.stats = new Array(jMatX[0].length);
-          var covar = jStat2.xtranspxinv(jMatX);
+          var covar = jStat3.xtranspxinv(jMatX);
           var sds, ts, ps;
           for (var i = 0; i < beta.length; i++) {
             sds = Math.sqrt(compile.anova.mse * Math.abs(covar[i][i]));
             ts = Math.abs(beta[i] / sds);
-            ps = jStat2.ttest(ts, jMatY.length - jMatX[0].length - 1, sides);
+            ps = jStat3.ttest(ts, jMatY.length - jMatX[0].length - 1, sides);
             compile.stats[i] = [beta[i], sds, ts, ps];
           }
           compile.regress = beta;
           return compile;
         },
         xtranspx: function xtranspx(jMatX) {
-          return jStat2.matrixmult(jMatX.transpose(), jMatX);
+          return jStat3.matrixmult(jMatX.transpose(), jMatX);
         },
         xtranspxinv: function xtranspxinv(jMatX) {
-          var inner = jStat2.matrixmult(jMatX.transpose(), jMatX);
-          var innerinv = jStat2.inv(inner);
+          var inner = jStat3.matrixmult(jMatX.transpose(), jMatX);
+          var innerinv = jStat3.inv(inner);
           return innerinv;
         },
         jMatYBar: function jMatYBar(jMatX, beta) {
-          var yBar = jStat2.matrixmult(jMatX, beta);
-          return new jStat2(yBar);
+          var yBar = jStat3.matrixmult(jMatX, beta);
+          return new jStat3(yBar);
         },
         residuals: function residuals(jMatY, jMatYBar) {
-          return jStat2.matrixsubtract(jMatY, jMatYBar);
+          return jStat3.matrixsubtract(jMatY, jMatYBar);
         },
         ssr: function ssr(jMatYBar, yAverage) {
           var ssr2 = 0;
@@ -19254,11 +19254,11 @@ var require_jstat = __commonJS({
               ans[i][j] = A[i][j] - B[i][j];
             }
           }
-          return jStat2(ans);
+          return jStat3(ans);
         }
       });
-      jStat2.jStat = jStat2;
-      return jStat2;
+      jStat3.jStat = jStat3;
+      return jStat3;
     });
   }
 });
@@ -19277,24 +19277,24 @@ var EXIT = {
 };
 function formatIssue(issue) {
   const where = issue.pointer === "" ? issue.file : `${issue.file}: ${issue.pointer}`;
-  let text = `${where} ${issue.expected}`;
-  if (issue.got !== void 0) text += ` (got ${issue.got})`;
-  text += ".";
-  if (issue.hint !== void 0) text += ` ${issue.hint}`;
-  return text;
+  let text2 = `${where} ${issue.expected}`;
+  if (issue.got !== void 0) text2 += ` (got ${issue.got})`;
+  text2 += ".";
+  if (issue.hint !== void 0) text2 += ` ${issue.hint}`;
+  return text2;
 }
-function quote(value) {
-  let text;
-  if (typeof value === "string") text = JSON.stringify(value);
-  else if (typeof value === "number" && !Number.isFinite(value)) text = String(value);
+function quote(value2) {
+  let text2;
+  if (typeof value2 === "string") text2 = JSON.stringify(value2);
+  else if (typeof value2 === "number" && !Number.isFinite(value2)) text2 = String(value2);
   else {
     try {
-      text = JSON.stringify(value) ?? String(value);
+      text2 = JSON.stringify(value2) ?? String(value2);
     } catch {
-      text = String(value);
+      text2 = String(value2);
     }
   }
-  return text.length > 60 ? `${text.slice(0, 57)}...` : text;
+  return text2.length > 60 ? `${text2.slice(0, 57)}...` : text2;
 }
 var InputError = class extends Error {
   issues;
@@ -19326,10 +19326,10 @@ import { dirname as dirname2, relative as relative2, resolve as resolve2, sep } 
 var MAX_MAGNITUDE = 1e15;
 var MAX_CURVE_POINTS = 1e4;
 var MAX_JSON_DEPTH = 64;
-function formatLimit(value) {
-  if (value !== 0 && (Math.abs(value) >= 1e6 || Math.abs(value) < 1e-6))
-    return value.toExponential().replace("e+", "e");
-  return String(value);
+function formatLimit(value2) {
+  if (value2 !== 0 && (Math.abs(value2) >= 1e6 || Math.abs(value2) < 1e-6))
+    return value2.toExponential().replace("e+", "e");
+  return String(value2);
 }
 
 // src/model/settings.ts
@@ -19344,10 +19344,19 @@ var FAIL_ON_VALUES = [
   "high-variance",
   "data-mismatch",
   "validation-overfit",
+  "guardrail-regression",
+  "guardrail-undetermined",
   "none"
 ];
-function isFailOn(value) {
-  return FAIL_ON_VALUES.includes(value);
+var COST_OUTCOME_FIELDS = /* @__PURE__ */ new Map([
+  ["train-seconds", "trainSeconds"],
+  ["inference-ms", "inferenceMs"],
+  ["parameters", "parameters"],
+  ["memory-mb", "memoryMb"]
+]);
+var COST_RATIO_OUTCOME = /^(train-seconds|inference-ms|parameters|memory-mb)-ratio>((?:0|[1-9][0-9]*)(?:\.[0-9]+)?)$/;
+function isFailOn(value2) {
+  return FAIL_ON_VALUES.includes(value2) || COST_RATIO_OUTCOME.test(value2);
 }
 var DEFAULT_SETTINGS = {
   alpha: 0.05,
@@ -19362,27 +19371,27 @@ var NUMBER_SETTINGS = {
   reference: { min: -MAX_MAGNITUDE, max: MAX_MAGNITUDE, about: "reference level" }
 };
 var DECIMAL = /^[+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:[eE][+-]?\d+)?$/;
-function parseDecimal(text) {
-  const trimmed = text.trim();
+function parseDecimal(text2) {
+  const trimmed = text2.trim();
   if (!DECIMAL.test(trimmed)) return null;
-  const value = Number(trimmed);
-  return Number.isFinite(value) ? value : null;
+  const value2 = Number(trimmed);
+  return Number.isFinite(value2) ? value2 : null;
 }
 function rangeText(name) {
   const { min, max } = NUMBER_SETTINGS[name];
   return `must be a number from ${formatLimit(min)} to ${formatLimit(max)}`;
 }
-function numberSettingIssues(name, value, source) {
+function numberSettingIssues(name, value2, source) {
   const { min, max } = NUMBER_SETTINGS[name];
-  if (Number.isFinite(value) && value >= min && value <= max) return [];
-  return [{ ...source, expected: rangeText(name), got: quote(value) }];
+  if (Number.isFinite(value2) && value2 >= min && value2 <= max) return [];
+  return [{ ...source, expected: rangeText(name), got: quote(value2) }];
 }
-function parseNumberSetting(name, text, source) {
-  const value = parseDecimal(text);
-  if (value === null)
-    return { issues: [{ ...source, expected: rangeText(name), got: quote(text) }] };
-  const issues = numberSettingIssues(name, value, source);
-  return issues.length > 0 ? { issues } : { value };
+function parseNumberSetting(name, text2, source) {
+  const value2 = parseDecimal(text2);
+  if (value2 === null)
+    return { issues: [{ ...source, expected: rangeText(name), got: quote(text2) }] };
+  const issues = numberSettingIssues(name, value2, source);
+  return issues.length > 0 ? { issues } : { value: value2 };
 }
 var FAIL_ON_SEPARATORS = /[,\n]/;
 function failOnIssues(values, source) {
@@ -19398,12 +19407,12 @@ function failOnIssues(values, source) {
     ];
   }
   const issues = values.flatMap(
-    (value, i) => isFailOn(value) ? [] : [
+    (value2, i) => isFailOn(value2) ? [] : [
       {
         ...source,
         pointer: at(i),
-        expected: `must be one of ${FAIL_ON_VALUES.join(", ")}`,
-        got: quote(value),
+        expected: `must be one of ${FAIL_ON_VALUES.join(", ")}, or FIELD-ratio>X (FIELD one of ${[...COST_OUTCOME_FIELDS.keys()].join(", ")})`,
+        got: quote(value2),
         hint: "Separate outcomes with commas or new lines."
       }
     ]
@@ -19418,8 +19427,8 @@ function failOnIssues(values, source) {
   }
   return issues;
 }
-function parseFailOn(text, source) {
-  const values = text.split(FAIL_ON_SEPARATORS).map((s) => s.trim()).filter((s) => s !== "");
+function parseFailOn(text2, source) {
+  const values = text2.split(FAIL_ON_SEPARATORS).map((s) => s.trim()).filter((s) => s !== "");
   const issues = failOnIssues(values, source);
   return issues.length > 0 ? { issues } : { value: values };
 }
@@ -19428,8 +19437,8 @@ function parseFailOn(text, source) {
 function splitCsvLine(line) {
   return line.split(",").map((cell) => cell.trim().replace(/^"(.*)"$/, "$1"));
 }
-function parseEpochLog(text, file, mapping) {
-  const lines = text.replace(/^\uFEFF/, "").split(/\r?\n/);
+function parseEpochLog(text2, file, mapping) {
+  const lines = text2.replace(/^\uFEFF/, "").split(/\r?\n/);
   const header = splitCsvLine(lines[0] ?? "");
   const seen = /* @__PURE__ */ new Map();
   header.forEach((name, i) => {
@@ -19474,8 +19483,8 @@ function parseEpochLog(text, file, mapping) {
     const cells = splitCsvLine(raw);
     const read = (index, name) => {
       const cell = cells[index] ?? "";
-      const value = parseDecimal(cell) ?? Number.NaN;
-      if (!Number.isFinite(value) || Math.abs(value) > MAX_MAGNITUDE) {
+      const value2 = parseDecimal(cell) ?? Number.NaN;
+      if (!Number.isFinite(value2) || Math.abs(value2) > MAX_MAGNITUDE) {
         issues.push({
           file,
           pointer: `line ${i + 1}`,
@@ -19484,7 +19493,7 @@ function parseEpochLog(text, file, mapping) {
         });
         return Number.NaN;
       }
-      return value;
+      return value2;
     };
     const point = { x: read(xi, mapping.x), validation: read(vi, mapping.validation) };
     if (ti !== void 0 && mapping.train !== void 0) point.train = read(ti, mapping.train);
@@ -19529,15 +19538,15 @@ function valueAt(doc, pointer) {
 function escapePointerToken(token) {
   return token.replace(/~/g, "~0").replace(/\//g, "~1");
 }
-function typeName(value) {
-  if (value === null) return "null";
-  if (Array.isArray(value)) return "an array";
-  if (typeof value === "object") return "an object";
-  return `${typeof value} ${quote(value)}`;
+function typeName(value2) {
+  if (value2 === null) return "null";
+  if (Array.isArray(value2)) return "an array";
+  if (typeof value2 === "object") return "an object";
+  return `${typeof value2} ${quote(value2)}`;
 }
 function oneIssue(error, file, doc) {
   const pointer = error.instancePath;
-  const value = valueAt(doc, pointer);
+  const value2 = valueAt(doc, pointer);
   const params = error.params;
   switch (error.keyword) {
     case "required":
@@ -19561,29 +19570,29 @@ function oneIssue(error, file, doc) {
         file,
         pointer,
         expected: `must be ${String(params["type"]) === "integer" ? "an integer" : `of type ${String(params["type"])}`}`,
-        got: typeName(value),
-        ...params["type"] === "number" && typeof value === "string" ? { hint: "Write numbers without quotes." } : {}
+        got: typeName(value2),
+        ...params["type"] === "number" && typeof value2 === "string" ? { hint: "Write numbers without quotes." } : {}
       };
     case "enum":
       return {
         file,
         pointer,
         expected: `must be one of ${params["allowedValues"].map((v) => quote(v)).join(", ")}`,
-        got: quote(value)
+        got: quote(value2)
       };
     case "const":
       return {
         file,
         pointer,
         expected: `must be ${quote(params["allowedValue"])}`,
-        got: quote(value)
+        got: quote(value2)
       };
     case "format":
       return {
         file,
         pointer,
         expected: `must be a ${String(params["format"])} string`,
-        got: quote(value),
+        got: quote(value2),
         ...params["format"] === "date-time" ? { hint: 'Use RFC 3339, e.g. "2026-11-30T10:00:00Z".' } : {}
       };
     default:
@@ -19591,7 +19600,7 @@ function oneIssue(error, file, doc) {
         file,
         pointer,
         expected: error.message ?? `fails ${error.keyword}`,
-        got: quote(value)
+        got: quote(value2)
       };
   }
 }
@@ -19629,24 +19638,24 @@ function outOfRangeNumbers(doc, maxMagnitude, max = 10) {
 }
 
 // src/artifact/read-json.ts
-function lineAndColumn(text, offset) {
+function lineAndColumn(text2, offset) {
   let line = 1;
   let last = -1;
-  for (let i = 0; i < offset && i < text.length; i++) {
-    if (text.charCodeAt(i) === 10) {
+  for (let i = 0; i < offset && i < text2.length; i++) {
+    if (text2.charCodeAt(i) === 10) {
       line++;
       last = i;
     }
   }
   return { line, column: offset - last };
 }
-function errorOffset(text, message) {
+function errorOffset(text2, message) {
   const position = /position (\d+)/.exec(message);
   if (position?.[1] !== void 0) return Number(position[1]);
-  if (/Unexpected end of JSON input/.test(message)) return text.length;
+  if (/Unexpected end of JSON input/.test(message)) return text2.length;
   const context = /Unexpected token '(.)', (?:\.\.\.)?"([\s\S]*?)"(?:\.\.\.)? is not valid JSON/.exec(message);
   if (context?.[1] !== void 0 && context[2] !== void 0) {
-    const at = text.indexOf(context[2]);
+    const at = text2.indexOf(context[2]);
     if (at >= 0) return at + Math.max(0, context[2].indexOf(context[1]));
   }
   return null;
@@ -19661,22 +19670,22 @@ function decodeKey(raw) {
     return null;
   }
 }
-function scanStructure(text, maxDepth = MAX_JSON_DEPTH) {
+function scanStructure(text2, maxDepth = MAX_JSON_DEPTH) {
   const stack = [];
   const duplicates = [];
   const pointer = () => stack.slice(0, -1).map((f) => `/${f.object ? escapePointerToken(f.at) : String(f.index)}`).join("");
-  for (let i = 0; i < text.length; i++) {
-    const c = text.charCodeAt(i);
+  for (let i = 0; i < text2.length; i++) {
+    const c = text2.charCodeAt(i);
     if (c === QUOTE) {
       const start = i + 1;
       i++;
-      while (i < text.length && text.charCodeAt(i) !== QUOTE) {
-        if (text.charCodeAt(i) === BACKSLASH) i++;
+      while (i < text2.length && text2.charCodeAt(i) !== QUOTE) {
+        if (text2.charCodeAt(i) === BACKSLASH) i++;
         i++;
       }
       const top = stack[stack.length - 1];
       if (top?.object === true && top.expectKey) {
-        const key = decodeKey(text.slice(start, i));
+        const key = decodeKey(text2.slice(start, i));
         top.expectKey = false;
         if (key !== null) {
           top.at = key;
@@ -19703,8 +19712,8 @@ function scanStructure(text, maxDepth = MAX_JSON_DEPTH) {
   }
   return { tooDeep: -1, duplicates };
 }
-function parseJson(text, file) {
-  const body = text.charCodeAt(0) === 65279 ? text.slice(1) : text;
+function parseJson(text2, file) {
+  const body = text2.charCodeAt(0) === 65279 ? text2.slice(1) : text2;
   const structure = scanStructure(body);
   if (structure.tooDeep >= 0) {
     const where = lineAndColumn(body, structure.tooDeep);
@@ -19922,6 +19931,100 @@ var fitgap_run_1_schema_default = {
           description: "Which repeat (0-based position in `values`) the predictions belong to; default 0."
         }
       }
+    },
+    guardrails: {
+      type: "array",
+      maxItems: 50,
+      description: "Metrics that must not get worse by more than a margin (calibration error, a fairness gap, latency\u2026), reviewed beside the primary metric.",
+      items: {
+        type: "object",
+        required: ["metric", "splits"],
+        additionalProperties: false,
+        properties: {
+          metric: {
+            type: "object",
+            required: ["name", "goal", "kind"],
+            additionalProperties: false,
+            properties: {
+              name: {
+                type: "string",
+                minLength: 1,
+                maxLength: 100
+              },
+              goal: {
+                enum: ["minimize", "maximize"]
+              },
+              kind: {
+                enum: ["proportion", "continuous"]
+              },
+              best: {
+                type: "number",
+                description: "Best possible value of the metric: 1 for accuracy, AUC and R\xB2, 100 for a 0\u2013100 score, 0 for an error. The error level of a maximized metric is best \u2212 value."
+              },
+              unit: {
+                type: "string",
+                minLength: 1,
+                maxLength: 40,
+                description: `Unit of the metric's values, for labels (e.g. "ms", "BLEU"). Proportions need none.`
+              }
+            },
+            description: "The guardrail's metric; the same fields as the primary metric."
+          },
+          splits: {
+            type: "object",
+            required: ["validation"],
+            additionalProperties: false,
+            properties: {
+              validation: {
+                $ref: "#/$defs/split"
+              },
+              test: {
+                $ref: "#/$defs/split"
+              }
+            }
+          },
+          margin: {
+            type: "number",
+            minimum: 0,
+            description: "Non-inferiority margin in the metric's units: the largest worsening still acceptable. Without it (here or in the config) the guardrail is reported but never gates."
+          }
+        }
+      }
+    },
+    cost: {
+      type: "object",
+      additionalProperties: false,
+      description: "What the run cost. Per-repeat lists give ratios with intervals.",
+      properties: {
+        trainSeconds: {
+          type: "array",
+          minItems: 1,
+          items: {
+            type: "number",
+            exclusiveMinimum: 0
+          },
+          description: "Training wall-clock seconds, one per repeat."
+        },
+        inferenceMs: {
+          type: "array",
+          minItems: 1,
+          items: {
+            type: "number",
+            exclusiveMinimum: 0
+          },
+          description: "Inference latency in milliseconds, one per repeat."
+        },
+        parameters: {
+          type: "number",
+          exclusiveMinimum: 0,
+          description: "Number of trained parameters."
+        },
+        memoryMb: {
+          type: "number",
+          exclusiveMinimum: 0,
+          description: "Peak memory in megabytes."
+        }
+      }
     }
   },
   $defs: {
@@ -19970,9 +20073,56 @@ var fitgap_run_1_schema_default = {
   }
 };
 
+// src/validate/guardrails.ts
+function guardrailIssues(run, file) {
+  const issues = [];
+  const names2 = /* @__PURE__ */ new Map();
+  run.guardrails?.forEach((guardrail, g) => {
+    const at = `/guardrails/${g}`;
+    const first = names2.get(guardrail.metric.name);
+    if (first !== void 0) {
+      issues.push({
+        file,
+        pointer: `${at}/metric/name`,
+        expected: `must be unique among the guardrails (also at /guardrails/${first}/metric/name)`,
+        got: quote(guardrail.metric.name)
+      });
+    } else names2.set(guardrail.metric.name, g);
+    if (guardrail.metric.name === run.metric.name) {
+      issues.push({
+        file,
+        pointer: `${at}/metric/name`,
+        expected: "must differ from the primary metric",
+        got: quote(guardrail.metric.name),
+        hint: "The primary metric is reviewed already; a guardrail is another metric."
+      });
+    }
+    for (const [split, values] of Object.entries(guardrail.splits)) {
+      values.values.forEach((v, i) => {
+        if (guardrail.metric.kind === "proportion" && (v < 0 || v > 1)) {
+          issues.push({
+            file,
+            pointer: `${at}/splits/${split}/values/${i}`,
+            expected: "must be within [0, 1] for a proportion metric",
+            got: quote(v),
+            hint: 'Write rates as fractions (0.07, not 7), or declare metric.kind "continuous".'
+          });
+        }
+      });
+    }
+  });
+  return issues;
+}
+
 // src/model/run.ts
 var SPLIT_NAMES = ["train", "train_dev", "validation", "test"];
 var CURVE_NAMES = ["epochs", "training_examples", "regularization"];
+var COST_FIELDS = [
+  "trainSeconds",
+  "inferenceMs",
+  "parameters",
+  "memoryMb"
+];
 
 // src/validate/run.ts
 var formatsModule = import_ajv_formats.default;
@@ -19989,13 +20139,13 @@ function validator() {
 function semanticIssues(run, file) {
   const issues = [];
   const proportion = run.metric.kind === "proportion";
-  const inUnit = (value, pointer) => {
-    if (proportion && (value < 0 || value > 1)) {
+  const inUnit = (value2, pointer) => {
+    if (proportion && (value2 < 0 || value2 > 1)) {
       issues.push({
         file,
         pointer,
         expected: "must be within [0, 1] for a proportion metric",
-        got: quote(value),
+        got: quote(value2),
         hint: 'Write rates as fractions (0.07, not 7), or declare metric.kind "continuous".'
       });
     }
@@ -20066,9 +20216,9 @@ function semanticIssues(run, file) {
     inUnit(slice.validation, `/slices/${i}/validation`);
     if (slice.train !== void 0) inUnit(slice.train, `/slices/${i}/train`);
   });
-  const names = /* @__PURE__ */ new Map();
+  const names2 = /* @__PURE__ */ new Map();
   run.slices?.forEach((slice, i) => {
-    const first = names.get(slice.name);
+    const first = names2.get(slice.name);
     if (first !== void 0) {
       issues.push({
         file,
@@ -20076,7 +20226,7 @@ function semanticIssues(run, file) {
         expected: `must be unique (also at /slices/${first}/name)`,
         got: quote(slice.name)
       });
-    } else names.set(slice.name, i);
+    } else names2.set(slice.name, i);
   });
   if (run.predictions !== void 0) {
     const p = run.predictions.path;
@@ -20090,6 +20240,7 @@ function semanticIssues(run, file) {
       });
     }
   }
+  issues.push(...guardrailIssues(run, file));
   return issues;
 }
 function validateRun(doc, file) {
@@ -20097,11 +20248,11 @@ function validateRun(doc, file) {
   if (numbers.length > 0) {
     throw new InputError(
       numbers.map(
-        ({ pointer, value }) => Number.isFinite(value) ? {
+        ({ pointer, value: value2 }) => Number.isFinite(value2) ? {
           file,
           pointer,
           expected: `must be within \xB1${formatLimit(MAX_MAGNITUDE)}`,
-          got: quote(value),
+          got: quote(value2),
           hint: pointer.startsWith("/hyperparameters/") ? "Write large identifiers (seeds, hashes) as strings." : "Rescale the metric (thousands instead of units); larger values overflow in the statistics."
         } : {
           file,
@@ -20143,22 +20294,22 @@ var LIMIT_RANGES_MB = {
   configBytes: { min: 1e-3, max: 64 },
   csvBytes: { min: 1e-3, max: 65536 }
 };
-function parseLimitMb(key, text, label) {
+function parseLimitMb(key, text2, label) {
   const { min, max } = LIMIT_RANGES_MB[key];
-  const value = /^\s*(?:\d+(?:\.\d*)?|\.\d+)\s*$/.test(text) ? Number(text) : Number.NaN;
-  if (!(value >= min && value <= max)) {
+  const value2 = /^\s*(?:\d+(?:\.\d*)?|\.\d+)\s*$/.test(text2) ? Number(text2) : Number.NaN;
+  if (!(value2 >= min && value2 <= max)) {
     return {
       issues: [
         {
           file: label,
           pointer: "",
           expected: `must be a number of MB from ${min} to ${max}`,
-          got: JSON.stringify(text)
+          got: JSON.stringify(text2)
         }
       ]
     };
   }
-  return { bytes: Math.round(value * MIB) };
+  return { bytes: Math.round(value2 * MIB) };
 }
 var LIMIT_HINTS = {
   artifactBytes: 'Raise the limit with --max-artifact-mb (action input "max-artifact-mb", config limits.artifact-mb) if the file is genuine.',
@@ -20409,8 +20560,8 @@ async function loadRun(path, options = {}) {
   });
   const read = [{ realPath: checked.realPath, id: checked.id }];
   const sha256 = createHash("sha256").update(bytes).digest("hex");
-  const text = decodeUtf8(bytes, file, "a run artifact");
-  const artifact = validateRun(parseJson(text, file), file);
+  const text2 = decodeUtf8(bytes, file, "a run artifact");
+  const artifact = validateRun(parseJson(text2, file), file);
   const notes = [];
   let predictionsPath = null;
   let predictions = null;
@@ -20449,9 +20600,7 @@ async function loadRun(path, options = {}) {
     const present = logPath !== null && await lstat(logPath).catch(() => null) !== null;
     if (logPath !== null && present) {
       if (artifact.curves?.epochs !== void 0) {
-        notes.push(
-          `${file}: the artifact has its own curves.epochs; the epoch log ${logName} was not used.`
-        );
+        notes.push({ code: "epoch-log-not-used", file, log: logName });
       } else {
         const log = await readChecked({
           path: logPath,
@@ -20471,9 +20620,7 @@ async function loadRun(path, options = {}) {
         if (issues.length > 0) throw new InputError(issues);
       }
     } else {
-      notes.push(
-        `No epoch log ${logName} next to ${file}; the config's epoch-log mapping was not applied to it.`
-      );
+      notes.push({ code: "epoch-log-missing", file, log: logName });
     }
   }
   return { artifact, file, sha256, predictionsPath, predictions, notes, read };
@@ -20516,7 +20663,7 @@ var fitgap_config_schema_default = {
       description: "Reference level (human-level, prior system, Bayes error) overriding the artifacts'; within [0, 1] for a proportion metric."
     },
     "fail-on": {
-      description: "Outcomes that fail the gate: a list, or one text with the outcomes separated by commas or new lines. 'none' never fails and stands alone; an empty list is refused.",
+      description: "Outcomes that fail the gate (README 'Gate'): a list, or one text with the outcomes separated by commas or new lines. 'none' never fails and stands alone; an empty list is refused.",
       oneOf: [
         {
           type: "string",
@@ -20527,18 +20674,27 @@ var fitgap_config_schema_default = {
           minItems: 1,
           items: {
             type: "string",
-            enum: [
-              "worse-validation",
-              "toward-overfitting",
-              "toward-underfitting",
-              "worse-on-both",
-              "any-movement",
-              "slice-regression",
-              "high-bias",
-              "high-variance",
-              "data-mismatch",
-              "validation-overfit",
-              "none"
+            anyOf: [
+              {
+                enum: [
+                  "worse-validation",
+                  "toward-overfitting",
+                  "toward-underfitting",
+                  "worse-on-both",
+                  "any-movement",
+                  "slice-regression",
+                  "high-bias",
+                  "high-variance",
+                  "data-mismatch",
+                  "validation-overfit",
+                  "guardrail-regression",
+                  "guardrail-undetermined",
+                  "none"
+                ]
+              },
+              {
+                pattern: "^(train-seconds|inference-ms|parameters|memory-mb)-ratio>((?:0|[1-9][0-9]*)(?:\\.[0-9]+)?)$"
+              }
             ]
           }
         }
@@ -20569,6 +20725,67 @@ var fitgap_config_schema_default = {
           type: "string",
           minLength: 1,
           description: "Column holding the validation metric."
+        }
+      }
+    },
+    hyperparameters: {
+      type: "object",
+      description: "Roles of hyperparameter names fitgap does not know, or knows differently: each name maps to a role and whether raising it lowers that role (`inverse`, as scikit-learn's C). Names match case-insensitively with '-' and '_' alike; a dotted or `__` path also matches by its last segment. Overrides the built-in vocabulary (README 'Hyperparameter vocabulary').",
+      maxProperties: 200,
+      propertyNames: {
+        type: "string",
+        minLength: 1,
+        maxLength: 200
+      },
+      additionalProperties: {
+        type: "object",
+        required: ["role"],
+        additionalProperties: false,
+        properties: {
+          role: {
+            type: "string",
+            enum: [
+              "regularization",
+              "capacity",
+              "features",
+              "polynomial-degree",
+              "data-size",
+              "epochs",
+              "early-stopping-patience",
+              "learning-rate",
+              "inert"
+            ],
+            description: "What the knob controls."
+          },
+          inverse: {
+            type: "boolean",
+            description: "Raising the value lowers the role (a smaller C is stronger regularization). Default false."
+          },
+          integer: {
+            type: "boolean",
+            description: "The knob takes integers (suggestions are rounded to integers). Default: true for capacity, features, polynomial-degree, data-size, epochs and early-stopping-patience."
+          },
+          scale: {
+            type: "string",
+            enum: ["log", "linear"],
+            description: "How the knob is tuned: `log` (by factors; geometric midpoints) or `linear` (by steps). Default: linear for integers, log otherwise."
+          }
+        }
+      }
+    },
+    guardrails: {
+      type: "object",
+      description: "Non-inferiority margins of guardrail metrics, by guardrail name; they override the artifacts' margins (the config is trusted, an artifact from a pull request is not).",
+      additionalProperties: {
+        type: "object",
+        required: ["margin"],
+        additionalProperties: false,
+        properties: {
+          margin: {
+            type: "number",
+            minimum: 0,
+            description: "Largest acceptable worsening, in the guardrail metric's units."
+          }
         }
       }
     },
@@ -20607,8 +20824,8 @@ function validator2() {
 var MAX_FLOW_DEPTH = 16;
 var MAX_BLOCK_PREFIX = 64;
 var MAX_ALIASES = 100;
-function yamlNestingProblem(text) {
-  const lines = text.split("\n");
+function yamlNestingProblem(text2) {
+  const lines = text2.split("\n");
   let depth = 0;
   for (let n = 0; n < lines.length; n++) {
     const line = lines[n] ?? "";
@@ -20636,13 +20853,13 @@ function yamlNestingProblem(text) {
   }
   return null;
 }
-function lineOf(text, offset) {
+function lineOf(text2, offset) {
   let line = 1;
-  for (let i = 0; i < offset && i < text.length; i++) if (text.charCodeAt(i) === 10) line++;
+  for (let i = 0; i < offset && i < text2.length; i++) if (text2.charCodeAt(i) === 10) line++;
   return line;
 }
-function parseConfig(text, file) {
-  return checkSettings(parseRaw(text, file), file);
+function parseConfig(text2, file) {
+  return checkSettings(parseRaw(text2, file), file);
 }
 var NUMBER_KEYS = ["alpha", "min-effect", "gap-tolerance", "reference"];
 var SETTING_KEYS = /* @__PURE__ */ new Set([...NUMBER_KEYS, "fail-on"]);
@@ -20650,12 +20867,12 @@ function checkSettings(data, file) {
   const { "fail-on": failOn, ...rest } = data;
   const issues = [];
   for (const key of NUMBER_KEYS) {
-    const value = rest[key];
-    if (value === void 0) continue;
+    const value2 = rest[key];
+    if (value2 === void 0) continue;
     const source2 = { file, pointer: `/${key}` };
-    if (typeof value !== "number") {
-      issues.push({ ...source2, expected: "must be a number", got: quote(value) });
-    } else issues.push(...numberSettingIssues(key, value, source2));
+    if (typeof value2 !== "number") {
+      issues.push({ ...source2, expected: "must be a number", got: quote(value2) });
+    } else issues.push(...numberSettingIssues(key, value2, source2));
   }
   if (issues.length > 0) throw new InputError(issues);
   if (failOn === void 0) return rest;
@@ -20678,8 +20895,8 @@ function checkSettings(data, file) {
   if (failOnProblems.length > 0) throw new InputError(failOnProblems);
   return { ...rest, "fail-on": failOn };
 }
-function parseRaw(text, file) {
-  const nesting = yamlNestingProblem(text);
+function parseRaw(text2, file) {
+  const nesting = yamlNestingProblem(text2);
   if (nesting !== null) {
     throw new InputError([
       {
@@ -20690,12 +20907,12 @@ function parseRaw(text, file) {
       }
     ]);
   }
-  const document = (0, import_yaml.parseDocument)(text, { prettyErrors: false, uniqueKeys: true });
+  const document = (0, import_yaml.parseDocument)(text2, { prettyErrors: false, uniqueKeys: true });
   if (document.errors.length > 0) {
     throw new InputError(
       document.errors.slice(0, 10).map((error) => ({
         file,
-        pointer: `line ${lineOf(text, error.pos[0])}`,
+        pointer: `line ${lineOf(text2, error.pos[0])}`,
         expected: "is not valid YAML",
         got: quote(
           /call stack/i.test(error.message) ? "nesting too deep" : error.message.split("\n")[0] ?? ""
@@ -20749,10 +20966,10 @@ async function loadConfig(path, file, required, limits) {
       error.issues.map((i) => ({ ...i, hint: "Check the config path." }))
     );
   }
-  const text = decodeUtf8(read.bytes, file, "a config file");
+  const text2 = decodeUtf8(read.bytes, file, "a config file");
   return {
-    config: parseConfig(text, file),
-    text,
+    config: parseConfig(text2, file),
+    text: text2,
     checked: { realPath: read.file.realPath, id: read.file.id }
   };
 }
@@ -20773,14 +20990,14 @@ function assertAlpha(alpha) {
 function assertProbability(name, p) {
   if (!(p >= 0 && p <= 1)) throw new RangeError(`${name} must be in [0, 1]; got ${p}`);
 }
-function assertCount(name, value) {
-  if (!Number.isSafeInteger(value) || value < 0) {
-    throw new RangeError(`${name} must be a non-negative integer count; got ${value}`);
+function assertCount(name, value2) {
+  if (!Number.isSafeInteger(value2) || value2 < 0) {
+    throw new RangeError(`${name} must be a non-negative integer count; got ${value2}`);
   }
 }
-function assertFinite(name, value) {
-  if (!Number.isFinite(value))
-    throw new RangeError(`${name} must be a finite number; got ${value}`);
+function assertFinite(name, value2) {
+  if (!Number.isFinite(value2))
+    throw new RangeError(`${name} must be a finite number; got ${value2}`);
 }
 function assertFiniteValues(name, values) {
   for (let i = 0; i < values.length; i++) {
@@ -20806,9 +21023,9 @@ function assertOpenProbability(p) {
   if (!(p > 0 && p < 1)) throw new RangeError(`p must be in (0, 1) for a quantile; got ${p}`);
 }
 function ibeta(x, a, b) {
-  const value = import_jstat.default.ibeta(x, a, b);
-  if (value === false) throw new RangeError(`incomplete beta argument must be in [0, 1]; got ${x}`);
-  return Math.min(1, Math.max(0, value));
+  const value2 = import_jstat.default.ibeta(x, a, b);
+  if (value2 === false) throw new RangeError(`incomplete beta argument must be in [0, 1]; got ${x}`);
+  return Math.min(1, Math.max(0, value2));
 }
 function normalCdf(x) {
   if (Number.isNaN(x)) throw new RangeError("normalCdf: x must be a number; got NaN");
@@ -20915,8 +21132,8 @@ function tInference(estimate, se2, df, alpha) {
   const p = Math.min(1, 2 * tCdf(-Math.abs(statistic), df));
   return { estimate, ci: [estimate - half, estimate + half], p, df, statistic };
 }
-function toResult(summary, test) {
-  return { ...summary, test };
+function toResult(summary, test2) {
+  return { ...summary, test: test2 };
 }
 function welchT(baseline, candidate, alpha) {
   assertAlpha(alpha);
@@ -20960,20 +21177,20 @@ function checkGroup(name, values) {
 }
 
 // src/stats/proportions.ts
-function normalTest(estimate, variance, alpha, test = "z-binomial") {
+function normalTest(estimate, variance, alpha, test2 = "z-binomial") {
   assertAlpha(alpha);
   assertFinite("normalTest estimate", estimate);
   if (!(variance >= 0) || !Number.isFinite(variance)) {
     throw new RangeError(`normalTest variance must be a finite number >= 0; got ${variance}`);
   }
   if (variance === 0) {
-    return { estimate, ci: [estimate, estimate], p: estimate === 0 ? 1 : 0, test };
+    return { estimate, ci: [estimate, estimate], p: estimate === 0 ? 1 : 0, test: test2 };
   }
   const se = Math.sqrt(variance);
   const statistic = estimate / se;
   const half = normalQuantile(1 - alpha / 2) * se;
   const p = Math.min(1, 2 * normalCdf(-Math.abs(statistic)));
-  return { estimate, ci: [estimate - half, estimate + half], p, test, statistic };
+  return { estimate, ci: [estimate - half, estimate + half], p, test: test2, statistic };
 }
 function binomialVariance(p, n) {
   assertProbability("binomialVariance p", p);
@@ -20984,11 +21201,16 @@ function binomialVariance(p, n) {
 }
 function wilsonInterval(successes, n, alpha) {
   assertAlpha(alpha);
+  return wilsonAtZ(successes, n, normalQuantile(1 - alpha / 2));
+}
+function wilsonAtZ(successes, n, z) {
   assertCount("successes", successes);
   assertCount("n", n);
   if (successes > n) throw new RangeError(`successes (${successes}) must not exceed n (${n})`);
+  if (!(z >= 0) || !Number.isFinite(z)) {
+    throw new RangeError(`z must be a finite number >= 0; got ${z}`);
+  }
   if (n === 0) return [0, 1];
-  const z = normalQuantile(1 - alpha / 2);
   const z2 = z * z;
   const centre = (successes + z2 / 2) / (n + z2);
   const half = z / (n + z2) * Math.sqrt(successes * (n - successes) / n + z2 / 4);
@@ -21018,22 +21240,1025 @@ function mcnemarExact(b, c, n, alpha) {
 // src/stats/holm.ts
 function holmAdjust(p) {
   const present = [];
-  p.forEach((value, index) => {
-    if (value === null) return;
-    if (!(value >= 0 && value <= 1)) {
-      throw new RangeError(`holmAdjust: p[${index}] must be in [0, 1] or null; got ${value}`);
+  p.forEach((value2, index) => {
+    if (value2 === null) return;
+    if (!(value2 >= 0 && value2 <= 1)) {
+      throw new RangeError(`holmAdjust: p[${index}] must be in [0, 1] or null; got ${value2}`);
     }
-    present.push({ index, value });
+    present.push({ index, value: value2 });
   });
   present.sort((a, b) => a.value - b.value);
   const m = present.length;
   const out = p.map(() => null);
   let running = 0;
-  present.forEach(({ index, value }, rank) => {
-    running = Math.max(running, Math.min(1, (m - rank) * value));
+  present.forEach(({ index, value: value2 }, rank) => {
+    running = Math.max(running, Math.min(1, (m - rank) * value2));
     out[index] = running;
   });
   return out;
+}
+
+// src/stats/non-inferiority.ts
+function welchWorsening(baseline, candidate) {
+  for (const [name, values] of [
+    ["baseline", baseline],
+    ["candidate", candidate]
+  ]) {
+    assertMinLength(name, values, 2);
+    assertFiniteValues(name, values);
+  }
+  const v1 = sampleVariance(baseline) / baseline.length;
+  const v2 = sampleVariance(candidate) / candidate.length;
+  const se2 = v1 + v2;
+  const df = se2 === 0 ? baseline.length + candidate.length - 2 : se2 * se2 / (v1 * v1 / (baseline.length - 1) + v2 * v2 / (candidate.length - 1));
+  return { estimate: mean(candidate) - mean(baseline), se: Math.sqrt(se2), df };
+}
+function upperTail(statistic, df) {
+  return df === null ? normalCdf(-statistic) : tCdf(-statistic, df);
+}
+function nonInferiorityTest(worsening, margin, alpha) {
+  assertAlpha(alpha);
+  assertFinite("worsening estimate", worsening.estimate);
+  assertFinite("margin", margin);
+  const { estimate, se, df } = worsening;
+  if (!(se >= 0) || !Number.isFinite(se)) {
+    throw new RangeError(`standard error must be a finite number >= 0; got ${se}`);
+  }
+  if (df !== null && !(df > 0)) throw new RangeError(`df must be > 0 or null; got ${df}`);
+  if (se === 0) {
+    const below = estimate < margin;
+    const above = estimate > margin;
+    return {
+      bounds: [estimate, estimate],
+      pNonInferior: below ? 0 : 1,
+      pInferior: above ? 0 : 1
+    };
+  }
+  const quantile = df === null ? normalQuantile(1 - alpha) : tQuantile(1 - alpha, df);
+  const statistic = (estimate - margin) / se;
+  return {
+    bounds: [estimate - quantile * se, estimate + quantile * se],
+    pNonInferior: upperTail(-statistic, df),
+    pInferior: upperTail(statistic, df)
+  };
+}
+function nonInferiorityCalls(tests, alpha) {
+  assertAlpha(alpha);
+  const nonInferior = holmAdjust(tests.map((t) => t === null ? null : t.pNonInferior));
+  const inferior = holmAdjust(tests.map((t) => t === null ? null : t.pInferior));
+  return tests.map((t, i) => {
+    if (t === null) return { call: null, pNonInferior: null, pInferior: null };
+    const pNi = nonInferior[i] ?? 1;
+    const pInf = inferior[i] ?? 1;
+    const call = pNi < alpha ? "non-inferior" : pInf < alpha ? "inferior" : "undetermined";
+    return { call, pNonInferior: pNi, pInferior: pInf };
+  });
+}
+
+// src/stats/ratio.ts
+function geometricMean(values) {
+  if (values.length === 1) return values[0];
+  let sum = 0;
+  for (const v of values) sum += Math.log(v);
+  return Math.exp(sum / values.length);
+}
+function logRatio(baseline, candidate, alpha) {
+  assertAlpha(alpha);
+  for (const [name, values] of [
+    ["baseline", baseline],
+    ["candidate", candidate]
+  ]) {
+    if (values.length === 0) throw new RangeError(`${name} needs at least 1 value; got 0`);
+    values.forEach((v, i) => {
+      if (!(v > 0) || !Number.isFinite(v)) {
+        throw new RangeError(`${name}[${i}] must be a positive finite number; got ${v}`);
+      }
+    });
+  }
+  const ratio2 = geometricMean(candidate) / geometricMean(baseline);
+  if (baseline.length < 2 || candidate.length < 2) return { ratio: ratio2, ci: null, p: null };
+  const test2 = welchT(baseline.map(Math.log), candidate.map(Math.log), alpha);
+  const ci = test2.ci;
+  return {
+    ratio: ratio2,
+    ci: ci === null ? null : [Math.exp(ci[0]), Math.exp(ci[1])],
+    p: test2.p
+  };
+}
+
+// src/stats/noncentral-t.ts
+var import_jstat2 = __toESM(require_jstat(), 1);
+
+// src/analysis/measure.ts
+function shortfallSign(run) {
+  return run.metric.goal === "minimize" ? 1 : -1;
+}
+function splitMeasure(split) {
+  return { terms: [{ split, weight: 1 }], constant: 0 };
+}
+function perRepeat(run, measure) {
+  const sign = shortfallSign(run);
+  const columns = [];
+  for (const term of measure.terms) {
+    const split = run.splits[term.split];
+    if (split === void 0) return null;
+    columns.push({ values: split.values, weight: term.weight });
+  }
+  const repeats = run.splits.train.values.length;
+  const out = [];
+  for (let i = 0; i < repeats; i++) {
+    let total = measure.constant;
+    for (const column of columns) total += column.weight * sign * (column.values[i] ?? Number.NaN);
+    out.push(total);
+  }
+  return out;
+}
+function binomialMeasureVariance(run, measure) {
+  if (run.metric.kind !== "proportion") return null;
+  let total = 0;
+  for (const term of measure.terms) {
+    const split = run.splits[term.split];
+    if (split?.examples === void 0) return null;
+    const repeats = split.values.length;
+    total += term.weight * term.weight * binomialVariance(mean(split.values), split.examples * repeats);
+  }
+  return total;
+}
+
+// src/analysis/noise.ts
+function callOf(result, settings) {
+  const big = Math.abs(result.estimate) >= settings.minEffect && result.estimate !== 0;
+  const significant = result.p === null ? settings.minEffect > 0 : result.p < settings.alpha;
+  if (!big || !significant) return "flat";
+  return result.estimate > 0 ? "up" : "down";
+}
+function toShortfallDelta(result, settings) {
+  return { unit: "shortfall", ...deltaFields(result, settings) };
+}
+function toMetricDelta(result, settings) {
+  return { unit: "metric", ...deltaFields(result, settings) };
+}
+function deltaFields(result, settings) {
+  return {
+    estimate: result.estimate,
+    ci: result.ci,
+    p: result.p,
+    test: result.test,
+    call: callOf(result, settings)
+  };
+}
+function measureChange(baseline, candidate, measure, alpha) {
+  const b = perRepeat(baseline, measure.baseline);
+  const c = perRepeat(candidate, measure.candidate);
+  if (b === null || c === null) return null;
+  const estimate = mean(c) - mean(b);
+  if (b.length >= 2 && c.length >= 2) return welchT(b, c, alpha);
+  const vb = binomialMeasureVariance(baseline, measure.baseline);
+  const vc = binomialMeasureVariance(candidate, measure.candidate);
+  if (vb !== null && vc !== null) return normalTest(estimate, vb + vc, alpha, "z-binomial");
+  return { estimate, ci: null, p: null, test: "none" };
+}
+function measureLevel(run, measure, alpha) {
+  const values = perRepeat(run, measure);
+  if (values === null) return null;
+  const value2 = mean(values);
+  if (values.length >= 2) {
+    const t = oneSampleT(values, alpha);
+    return { value: value2, ci: t.ci, p: t.pGreater };
+  }
+  const variance = binomialMeasureVariance(run, measure);
+  if (variance !== null) {
+    const z = normalTest(value2, variance, alpha, "z-binomial");
+    const p = variance > 0 ? 1 - normalCdf(value2 / Math.sqrt(variance)) : value2 > 0 ? 0 : 1;
+    return { value: value2, ci: z.ci, p };
+  }
+  return { value: value2, ci: null, p: null };
+}
+function toMetricUnits(result, sign) {
+  if (sign === 1) return result;
+  return {
+    ...result,
+    estimate: -result.estimate,
+    ci: result.ci === null ? null : [-result.ci[1], -result.ci[0]],
+    ...result.statistic === void 0 ? {} : { statistic: -result.statistic }
+  };
+}
+
+// src/analysis/decompose.ts
+function chooseReference(run, override) {
+  if (override !== void 0) return { value: override, source: "config" };
+  if (run.reference !== void 0) return { value: run.reference, source: "artifact" };
+  if (run.metric.kind === "proportion" && run.metric.goal === "minimize")
+    return { value: 0, source: "default" };
+  return { value: null, source: "unknown" };
+}
+function componentMeasures(run, reference) {
+  const sign = shortfallSign(run);
+  const hasDev = run.splits.train_dev !== void 0;
+  return {
+    bias: reference === null ? null : { terms: [{ split: "train", weight: 1 }], constant: -sign * reference },
+    variance: {
+      terms: [
+        { split: hasDev ? "train_dev" : "validation", weight: 1 },
+        { split: "train", weight: -1 }
+      ],
+      constant: 0
+    },
+    mismatch: hasDev ? {
+      terms: [
+        { split: "validation", weight: 1 },
+        { split: "train_dev", weight: -1 }
+      ],
+      constant: 0
+    } : null,
+    overfit: run.splits.test !== void 0 ? {
+      terms: [
+        { split: "test", weight: 1 },
+        { split: "validation", weight: -1 }
+      ],
+      constant: 0
+    } : null
+  };
+}
+function errorLevel(run) {
+  const m = mean(run.splits.validation.values);
+  return Math.abs(run.metric.goal === "minimize" ? m : 1 - m);
+}
+var UNAVAILABLE = /* @__PURE__ */ new Map([
+  ["bias", "no-reference"],
+  ["mismatch", "no-train-dev"],
+  ["overfit", "no-test"]
+]);
+function decompose(run, reference, settings) {
+  const measures = componentMeasures(run, reference);
+  const threshold = Math.max(settings.gapTolerance * errorLevel(run), settings.minEffect);
+  const out = {};
+  for (const name of ["bias", "variance", "mismatch", "overfit"]) {
+    const measure = measures[name];
+    const level = measure === null ? null : measureLevel(run, measure, settings.alpha);
+    if (level === null) {
+      const unavailable = UNAVAILABLE.get(name);
+      if (unavailable === void 0) throw new Error(`${name} needs splits every run has`);
+      out[name] = { name, value: null, unavailable, ci: null, p: null, present: false };
+      continue;
+    }
+    const significant = level.p === null || level.p < settings.alpha;
+    const present = level.value > 0 && level.value >= threshold && significant;
+    out[name] = { name, value: level.value, ci: level.ci, p: level.p, present };
+  }
+  return out;
+}
+function diagnose(components) {
+  const candidates = ["bias", "variance", "mismatch"].map((name) => components[name]).filter((c) => c.present && c.value !== null).sort((a, b) => (b.value ?? 0) - (a.value ?? 0));
+  const top = candidates[0];
+  if (top === void 0) return "good-fit";
+  const bias = components.bias;
+  const variance = components.variance;
+  if (bias.present && variance.present && bias.value !== null && variance.value !== null) {
+    const ratio2 = Math.max(bias.value, variance.value) / Math.min(bias.value, variance.value);
+    if (ratio2 <= 2 && (top.name === "bias" || top.name === "variance"))
+      return "high-bias-and-variance";
+  }
+  if (top.name === "bias") return "high-bias";
+  if (top.name === "variance") return "high-variance";
+  return "data-mismatch";
+}
+
+// src/analysis/changes.ts
+function both(measure) {
+  return { baseline: measure, candidate: measure };
+}
+function pairedTest(paired, run, alpha) {
+  if (paired.rows === 0) return null;
+  if (paired.kind === "proportion") {
+    const result = mcnemarExact(
+      paired.baselineOnly ?? 0,
+      paired.candidateOnly ?? 0,
+      paired.rows,
+      alpha
+    );
+    return run.metric.goal === "minimize" ? toMetricUnits(result, -1) : result;
+  }
+  return pairedT(
+    { n: paired.rows, mean: paired.meanDiff ?? 0, variance: paired.varDiff ?? 0 },
+    alpha
+  );
+}
+function splitShortfalls(runs, alpha, paired) {
+  const pairedSplit = paired?.split ?? "validation";
+  const sign = shortfallSign(runs.candidate);
+  const out = /* @__PURE__ */ new Map();
+  for (const split of SPLIT_NAMES) {
+    let result = measureChange(runs.baseline, runs.candidate, both(splitMeasure(split)), alpha);
+    if (result === null) continue;
+    if (paired !== void 0 && split === pairedSplit && (result.test === "none" || result.test === "z-binomial")) {
+      const test2 = pairedTest(paired, runs.candidate, alpha);
+      if (test2 !== null) result = toMetricUnits(test2, sign);
+    }
+    out.set(split, result);
+  }
+  return out;
+}
+function splitChanges(shortfalls, runs, summaries, calls) {
+  const sign = shortfallSign(runs.candidate);
+  const out = [];
+  for (const [split, result] of shortfalls) {
+    const b = summaries.baseline.splits.find((s) => s.split === split);
+    const c = summaries.candidate.splits.find((s) => s.split === split);
+    if (b === void 0 || c === void 0) continue;
+    out.push({
+      split,
+      baseline: b.mean,
+      candidate: c.mean,
+      delta: toMetricDelta(toMetricUnits(result, sign), calls)
+    });
+  }
+  return out;
+}
+function componentChanges(runs, references, calls) {
+  const { baseline, candidate } = runs;
+  const alpha = calls.alpha;
+  const refB = references.baseline;
+  const refC = references.candidate;
+  const [biasRefB, biasRefC] = refB !== null && refC !== null ? [refB, refC] : [0, 0];
+  const bias = measureChange(
+    baseline,
+    candidate,
+    {
+      baseline: componentMeasures(baseline, biasRefB).bias ?? splitMeasure("train"),
+      candidate: componentMeasures(candidate, biasRefC).bias ?? splitMeasure("train")
+    },
+    alpha
+  );
+  const change2 = (name) => {
+    const mb = componentMeasures(baseline, refB)[name];
+    const mc = componentMeasures(candidate, refC)[name];
+    if (mb === null || mc === null) return null;
+    const r = measureChange(baseline, candidate, { baseline: mb, candidate: mc }, alpha);
+    return r === null ? null : toShortfallDelta(r, calls);
+  };
+  const varianceFallback = baseline.splits.train_dev === void 0 !== (candidate.splits.train_dev === void 0);
+  const variance = varianceFallback ? validationMinusTrain(runs, calls) : change2("variance");
+  if (variance === null)
+    throw new Error("variance needs train and validation, which the schema requires");
+  return {
+    bias: bias === null ? null : toShortfallDelta(bias, calls),
+    variance,
+    mismatch: change2("mismatch"),
+    overfit: change2("overfit"),
+    varianceFallback
+  };
+}
+function validationMinusTrain(runs, calls) {
+  const measure = {
+    terms: [
+      { split: "validation", weight: 1 },
+      { split: "train", weight: -1 }
+    ],
+    constant: 0
+  };
+  const r = measureChange(runs.baseline, runs.candidate, both(measure), calls.alpha);
+  return r === null ? null : toShortfallDelta(r, calls);
+}
+
+// src/analysis/cost.ts
+var asList = (value2) => value2 === void 0 ? null : Array.isArray(value2) ? value2 : [value2];
+function reviewCost(baseline, candidate, alpha) {
+  const out = {};
+  for (const field of COST_FIELDS) {
+    const b = asList(baseline.cost?.[field]);
+    const c = asList(candidate.cost?.[field]);
+    if (b === null || c === null) continue;
+    const r = logRatio(b, c, alpha);
+    const geometric = (values) => values.length === 1 ? values[0] : Math.exp(values.reduce((s, v) => s + Math.log(v), 0) / values.length);
+    const single = !Array.isArray(candidate.cost?.[field]);
+    let call;
+    if (r.p !== null) call = r.p < alpha ? r.ratio > 1 ? "up" : "down" : "flat";
+    else if (single) call = r.ratio > 1 ? "up" : r.ratio < 1 ? "down" : "flat";
+    else call = "undetermined";
+    out[field] = {
+      baseline: geometric(b),
+      candidate: geometric(c),
+      ratio: r.ratio,
+      ci: r.ci,
+      p: r.p,
+      call
+    };
+  }
+  return out;
+}
+
+// src/analysis/gate.ts
+function guardrailsWith(r, call) {
+  return (r.guardrails ?? []).filter((g) => g.nonInferiority === call).map((g) => g.name);
+}
+function costRule(policy) {
+  const match = COST_RATIO_OUTCOME.exec(policy);
+  if (match === null) return void 0;
+  const field = COST_OUTCOME_FIELDS.get(match[1]);
+  const limit = Number(match[2]);
+  return (r) => {
+    const ratio2 = field === void 0 ? void 0 : r.cost?.[field]?.ratio;
+    return ratio2 !== void 0 && ratio2 > limit ? { outcome: policy, ratio: ratio2 } : null;
+  };
+}
+var RULES = /* @__PURE__ */ new Map([
+  ["worse-validation", (r) => fired(r.validation.change === "worse", "worse-validation")],
+  ["toward-overfitting", (r) => fired(r.movement === "toward-overfitting", "toward-overfitting")],
+  [
+    "toward-underfitting",
+    (r) => fired(r.movement === "toward-underfitting", "toward-underfitting")
+  ],
+  ["worse-on-both", (r) => fired(r.movement === "worse-on-both", "worse-on-both")],
+  ["any-movement", (r) => fired(r.movement !== "no-significant-change", "any-movement")],
+  [
+    "slice-regression",
+    (r) => {
+      const slices2 = r.slices.filter((s) => s.change === "worse").length;
+      return slices2 > 0 ? { outcome: "slice-regression", slices: slices2 } : null;
+    }
+  ],
+  [
+    "high-bias",
+    (r) => fired(
+      r.candidate.diagnosis === "high-bias" || r.candidate.diagnosis === "high-bias-and-variance",
+      "high-bias"
+    )
+  ],
+  [
+    "high-variance",
+    (r) => fired(
+      r.candidate.diagnosis === "high-variance" || r.candidate.diagnosis === "high-bias-and-variance",
+      "high-variance"
+    )
+  ],
+  ["data-mismatch", (r) => fired(r.candidate.diagnosis === "data-mismatch", "data-mismatch")],
+  [
+    "validation-overfit",
+    (r) => fired(r.candidate.components.overfit.present, "validation-overfit")
+  ],
+  [
+    "guardrail-regression",
+    (r) => {
+      const names2 = guardrailsWith(r, "inferior");
+      return names2.length > 0 ? { outcome: "guardrail-regression", guardrails: names2 } : null;
+    }
+  ],
+  [
+    "guardrail-undetermined",
+    (r) => {
+      const names2 = guardrailsWith(r, "undetermined");
+      return names2.length > 0 ? { outcome: "guardrail-undetermined", guardrails: names2 } : null;
+    }
+  ],
+  ["none", () => null]
+]);
+function fired(condition, outcome) {
+  return condition ? { outcome } : null;
+}
+function applyGate(review, failOn) {
+  const reasons = [];
+  for (const policy of failOn) {
+    const rule = RULES.get(policy) ?? costRule(policy);
+    const reason = rule?.(review) ?? null;
+    if (reason !== null) reasons.push(reason);
+  }
+  return { pass: reasons.length === 0, reasons, failOn: [...failOn] };
+}
+
+// src/analysis/guardrails.ts
+var worseSign = (g) => g.metric.goal === "minimize" ? 1 : -1;
+function test(b, c, alpha) {
+  const bs = b.splits.validation;
+  const cs = c.splits.validation;
+  const estimate = mean(cs.values) - mean(bs.values);
+  const sign = worseSign(c);
+  if (bs.values.length >= 2 && cs.values.length >= 2) {
+    const t = welchT(bs.values, cs.values, alpha);
+    const w = welchWorsening(
+      bs.values.map((v) => sign * v),
+      cs.values.map((v) => sign * v)
+    );
+    return { change: changeOf(t.estimate, t.ci, t.p, "welch-t", sign, alpha), worsening: w };
+  }
+  const variance = binomial(b, bs) !== null && binomial(c, cs) !== null;
+  if (variance) {
+    const v = binomial(b, bs) + binomial(c, cs);
+    const z = normalTest(estimate, v, alpha, "z-binomial");
+    return {
+      change: changeOf(estimate, z.ci, z.p, "z-binomial", sign, alpha),
+      worsening: { estimate: sign * estimate, se: Math.sqrt(v), df: null }
+    };
+  }
+  return {
+    change: { estimate, ci: null, p: null, test: "none", call: "undetermined" },
+    worsening: null
+  };
+}
+function binomial(g, split) {
+  if (g.metric.kind !== "proportion" || split.examples === void 0) return null;
+  return binomialVariance(mean(split.values), split.examples * split.values.length);
+}
+function changeOf(estimate, ci, p, testName, sign, alpha) {
+  const significant = p !== null && p < alpha && estimate !== 0;
+  const worse = sign * estimate > 0;
+  return {
+    estimate,
+    ci,
+    p,
+    test: testName,
+    call: significant ? worse ? "worse" : "better" : "flat"
+  };
+}
+function marginOf(name, b, c, settings) {
+  const fromConfig = settings.margins.get(name);
+  const candidateIgnored = (chosen) => c?.margin !== void 0 && chosen !== void 0 && c.margin !== chosen;
+  if (fromConfig !== void 0)
+    return {
+      margin: fromConfig,
+      source: "config",
+      candidateIgnored: candidateIgnored(fromConfig)
+    };
+  if (b?.margin !== void 0)
+    return { margin: b.margin, source: "baseline", candidateIgnored: candidateIgnored(b.margin) };
+  if (c?.margin !== void 0)
+    return { margin: c.margin, source: "candidate", candidateIgnored: false };
+  return { margin: null, source: null, candidateIgnored: false };
+}
+function reviewGuardrails(baseline, candidate, settings) {
+  const byName = (run) => new Map((run.guardrails ?? []).map((g) => [g.metric.name, g]));
+  const bs = byName(baseline);
+  const cs = byName(candidate);
+  const names2 = [.../* @__PURE__ */ new Set([...cs.keys(), ...bs.keys()])];
+  const drafts = names2.map((name) => {
+    const b = bs.get(name);
+    const c = cs.get(name);
+    const metric = (c ?? b)?.metric;
+    if (metric === void 0) throw new Error(`guardrail ${name} vanished`);
+    const { margin, source, candidateIgnored } = marginOf(name, b, c, settings);
+    const review = {
+      name,
+      goal: metric.goal,
+      kind: metric.kind,
+      unit: metric.unit ?? null,
+      baseline: b === void 0 ? null : mean(b.splits.validation.values),
+      candidate: c === void 0 ? null : mean(c.splits.validation.values),
+      change: null,
+      margin,
+      marginSource: source,
+      worseningBounds: null,
+      pNonInferior: null,
+      nonInferiority: null,
+      problems: []
+    };
+    if (candidateIgnored) review.problems.push("candidate-margin-ignored");
+    if (margin === null) review.problems.push("no-margin");
+    if (b === void 0) review.problems.push("missing-in-baseline");
+    if (c === void 0) review.problems.push("missing-in-candidate");
+    if (b === void 0 || c === void 0) return { review, ni: null };
+    if (b.metric.goal !== c.metric.goal || b.metric.kind !== c.metric.kind) {
+      review.problems.push("metric-differs");
+      return { review, ni: null };
+    }
+    const tested = test(b, c, settings.alpha);
+    review.change = tested.change;
+    if (tested.worsening === null) review.problems.push("noise-unknown");
+    if (margin === null) return { review, ni: null };
+    if (tested.worsening === null) {
+      review.nonInferiority = "undetermined";
+      return { review, ni: null };
+    }
+    const ni = nonInferiorityTest(tested.worsening, margin, settings.alpha);
+    review.worseningBounds = ni.bounds;
+    return { review, ni };
+  });
+  const calls = nonInferiorityCalls(
+    drafts.map((d) => d.ni),
+    settings.alpha
+  );
+  return drafts.map((d, i) => {
+    const call = calls[i];
+    if (d.ni !== null && call !== void 0 && call.call !== null) {
+      d.review.nonInferiority = call.call;
+      d.review.pNonInferior = call.pNonInferior;
+    }
+    return d.review;
+  });
+}
+
+// src/analysis/hyperparameters.ts
+function diffHyperparameters(baseline = {}, candidate = {}) {
+  const keys = [.../* @__PURE__ */ new Set([...Object.keys(baseline), ...Object.keys(candidate)])].sort();
+  const out = [];
+  for (const key of keys) {
+    const inB = Object.hasOwn(baseline, key);
+    const inC = Object.hasOwn(candidate, key);
+    const b = baseline[key];
+    const c = candidate[key];
+    if (!inB) out.push({ key, baseline: null, candidate: c, kind: "added" });
+    else if (!inC) out.push({ key, baseline: b, candidate: null, kind: "removed" });
+    else if (typeof b === "number" && typeof c === "number") {
+      if (c > b) out.push({ key, baseline: b, candidate: c, kind: "raised" });
+      else if (c < b) out.push({ key, baseline: b, candidate: c, kind: "lowered" });
+    } else if (JSON.stringify(b) !== JSON.stringify(c))
+      out.push({ key, baseline: b, candidate: c, kind: "changed" });
+  }
+  return out;
+}
+var KNOBS = [
+  [
+    /^(lambda|l2|l2_penalty|weight_decay|reg(ularization)?(_strength)?|ridge_alpha|dropout)$/i,
+    "regularization"
+  ],
+  [/^(features|num_features|n_features|feature_count)$/i, "features"],
+  [/^(polynomial_degree|poly_degree|degree|interaction_terms)$/i, "feature-richness"],
+  [/^(train_examples|training_examples|n_train|train_size|num_train)$/i, "data"],
+  [/^(epochs|max_epochs|num_epochs|iterations|max_iter|steps)$/i, "epochs"],
+  [
+    /^(hidden_units|hidden_size|layers|num_layers|depth|max_depth|width|params|parameters|model_size|n_estimators)$/i,
+    "model-size"
+  ]
+];
+function knobOf(key) {
+  for (const [pattern, knob] of KNOBS) if (pattern.test(key)) return knob;
+  return null;
+}
+var PULLED = {
+  regularization: { raised: "stronger-regularization", lowered: "weaker-regularization" },
+  features: { raised: "more-features", lowered: "fewer-features" },
+  "feature-richness": { raised: "richer-features", lowered: "fewer-features" },
+  data: { raised: "more-data", lowered: "more-data" },
+  epochs: { raised: "train-longer", lowered: "early-stopping" },
+  "model-size": { raised: "bigger-model", lowered: "smaller-model" }
+};
+function pulledLevers(changes) {
+  const out = [];
+  for (const change2 of changes) {
+    if (change2.kind !== "raised" && change2.kind !== "lowered") continue;
+    const knob = knobOf(change2.key);
+    if (knob === null) continue;
+    if (knob === "data" && change2.kind === "lowered") continue;
+    out.push({ lever: PULLED[knob][change2.kind], change: change2, knob });
+  }
+  return out;
+}
+
+// src/analysis/levers/context.ts
+function curveEvidence(curves) {
+  const analysed = (c) => c === void 0 || "skipped" in c ? null : c;
+  return {
+    learning: analysed(curves.training_examples),
+    sweep: analysed(curves.regularization),
+    epochs: analysed(curves.epochs)
+  };
+}
+var Drafts = class {
+  #byId = /* @__PURE__ */ new Map();
+  add(id, score, evidence, suggestion) {
+    const existing = this.#byId.get(id);
+    if (existing !== void 0 && existing.score >= score) return;
+    this.#byId.set(id, {
+      id,
+      score,
+      ...suggestion === void 0 ? {} : { suggestion },
+      evidence
+    });
+  }
+  has(id) {
+    return this.#byId.has(id);
+  }
+  /** Highest score first; drafts with equal scores keep the order they were first drafted in. */
+  ranked() {
+    return [...this.#byId.values()].sort((a, b) => b.score - a.score);
+  }
+};
+function between(from, to) {
+  return from > 0 && to > 0 ? Math.sqrt(from * to) : (from + to) / 2;
+}
+function savedByStopping(e, goal) {
+  const sign = goal === "minimize" ? 1 : -1;
+  return Math.max(0, sign * (e.finalValidation - e.bestValidation));
+}
+function epochMinimum(e, goal) {
+  return {
+    kind: "epoch-minimum",
+    epoch: e.bestX,
+    of: e.finalX,
+    saves: savedByStopping(e, goal),
+    gl: e.gl
+  };
+}
+
+// src/analysis/levers/catalogue.ts
+var BY_TARGET = {
+  variance: [
+    "more-data",
+    "stronger-regularization",
+    "fewer-features",
+    "early-stopping",
+    "smaller-model"
+  ],
+  bias: [
+    "richer-features",
+    "more-features",
+    "weaker-regularization",
+    "bigger-model",
+    "train-longer"
+  ]
+};
+
+// src/analysis/levers/scores.ts
+var REVERSE_OWN_CHANGE = 100;
+var COUNTER_WITH_SWEEP = 95;
+var STEP_BACK_CAPACITY = 90;
+var COUNTER_WITHOUT_SWEEP = 85;
+var DIAGNOSIS_BASE = 60;
+var SECOND_TARGET_STEP = 20;
+var CATALOGUE_STEP = 2;
+var GAP_CLOSING_BONUS = 8;
+var GAP_FLAT_PENALTY = 25;
+var SWEEP_AGREES_BONUS = 10;
+var SWEEP_DISAGREES_PENALTY = 20;
+var EPOCH_CONFIRMED_BONUS = 12;
+var EPOCH_UNCONFIRMED_PENALTY = 15;
+var NOTHING_TO_WEAKEN_PENALTY = 10;
+var ALREADY_PULLED_PENALTY = 30;
+var EPOCH_CURVE_ALONE = 35;
+var MISMATCH_DIAGNOSED = 70;
+var MISMATCH_PRESENT = 30;
+var VALIDATION_OVERFIT = 40;
+var SUPPLY_REFERENCE = 20;
+var ADD_REPEATS = 15;
+
+// src/analysis/levers/own-change.ts
+var CAPACITY_LEVERS = /* @__PURE__ */ new Set([
+  "richer-features",
+  "more-features",
+  "bigger-model"
+]);
+function numericChange(p) {
+  return {
+    hyperparameter: p.change.key,
+    from: Number(p.change.baseline),
+    to: Number(p.change.candidate),
+    direction: p.change.kind === "lowered" ? "lowered" : "raised"
+  };
+}
+function ownChangeLevers(ctx, curves, drafts) {
+  const towardBias = ctx.movement === "toward-underfitting" || ctx.movement === "worse-on-both";
+  const towardVariance = ctx.movement === "toward-overfitting" || ctx.movement === "worse-on-both";
+  const biasChange = {
+    kind: "component-change",
+    component: "bias",
+    delta: ctx.bias
+  };
+  const varianceChange = {
+    kind: "component-change",
+    component: "variance",
+    delta: ctx.variance
+  };
+  for (const p of ctx.pulled) {
+    const { baseline: from, candidate: to, key } = p.change;
+    if (typeof from !== "number" || typeof to !== "number") continue;
+    const change2 = { kind: "pr-change", ...numericChange(p) };
+    const midway = {
+      hyperparameter: key,
+      value: between(from, to),
+      basis: "between-old-and-new"
+    };
+    if (p.lever === "stronger-regularization" && towardBias) {
+      drafts.add("weaker-regularization", REVERSE_OWN_CHANGE, [change2, biasChange], midway);
+    }
+    if (p.lever === "weaker-regularization" && towardVariance) {
+      drafts.add("stronger-regularization", REVERSE_OWN_CHANGE, [change2, varianceChange], midway);
+    }
+    if (CAPACITY_LEVERS.has(p.lever) && towardVariance) {
+      const back = p.lever === "bigger-model" ? "smaller-model" : "fewer-features";
+      drafts.add(back, STEP_BACK_CAPACITY, [change2, varianceChange], midway);
+      counterCapacity(ctx, curves, drafts, [change2, varianceChange]);
+    }
+  }
+}
+function counterCapacity(ctx, curves, drafts, evidence) {
+  const sweep = curves.sweep;
+  if (sweep === null || sweep.side !== "below") {
+    drafts.add("stronger-regularization", COUNTER_WITHOUT_SWEEP, evidence);
+    return;
+  }
+  const key = ctx.regularization?.key;
+  drafts.add(
+    "stronger-regularization",
+    COUNTER_WITH_SWEEP,
+    [
+      ...evidence,
+      {
+        kind: "sweep-minimum",
+        hyperparameter: key ?? null,
+        bestX: sweep.bestX,
+        bestValidation: sweep.bestValidation,
+        current: ctx.regularization?.value ?? null,
+        suggestedX: sweep.suggestedX,
+        side: sweep.side,
+        supports: true,
+        atEdge: sweep.atEdge
+      }
+    ],
+    key === void 0 ? void 0 : sweepSuggestion(key, sweep)
+  );
+}
+function sweepSuggestion(key, sweep) {
+  return {
+    hyperparameter: key,
+    value: sweep.suggestedX,
+    basis: sweep.atEdge === null ? "sweep-minimum" : "beyond-sweep-edge"
+  };
+}
+
+// src/analysis/levers/diagnosis.ts
+function targets(diagnosis, run) {
+  const b = run.components.bias.value ?? 0;
+  const v = run.components.variance.value ?? 0;
+  switch (diagnosis) {
+    case "high-variance":
+      return ["variance"];
+    case "high-bias":
+      return ["bias"];
+    case "high-bias-and-variance":
+      return b >= v ? ["bias", "variance"] : ["variance", "bias"];
+    default:
+      return [];
+  }
+}
+function diagnosisLevers(ctx, curves, drafts) {
+  const pulled = new Map(ctx.pulled.map((p) => [p.lever, p]));
+  targets(ctx.candidate.diagnosis, ctx.candidate).forEach((target, t) => {
+    const component = ctx.candidate.components[target];
+    const base = component.value === null ? [] : [
+      {
+        kind: "diagnosis",
+        component: target,
+        value: component.value,
+        errorLevel: ctx.candidate.errorLevel
+      }
+    ];
+    BY_TARGET[target].forEach((id, i) => {
+      const draft = {
+        score: DIAGNOSIS_BASE - t * SECOND_TARGET_STEP - i * CATALOGUE_STEP,
+        evidence: [...base]
+      };
+      sharpen(id, draft, ctx, curves);
+      const p = pulled.get(id);
+      if (p !== void 0) {
+        draft.score -= ALREADY_PULLED_PENALTY;
+        draft.evidence.push({ kind: "already-pulled", ...numericChange(p) });
+      }
+      drafts.add(id, draft.score, draft.evidence, draft.suggestion);
+    });
+  });
+}
+function sharpen(id, draft, ctx, curves) {
+  if (id === "more-data" && curves.learning !== null) {
+    const lc = curves.learning;
+    const twice = lc.projections[0];
+    if (twice !== void 0) {
+      draft.evidence.push({
+        kind: "learning-curve",
+        fromX: Math.max(...lc.chart.map((p) => p.x)),
+        atX: twice.x,
+        current: ctx.candidate.splits.find((s) => s.split === "validation")?.mean ?? 0,
+        projected: twice.validation,
+        ci: twice.ci,
+        r2: lc.r2
+      });
+    }
+    if (lc.gapTrend === "flat") {
+      draft.score -= GAP_FLAT_PENALTY;
+      draft.evidence.push({ kind: "gap-trend", trend: "flat" });
+    } else if (lc.gapTrend === "closing") {
+      draft.score += GAP_CLOSING_BONUS;
+      draft.evidence.push({ kind: "gap-trend", trend: "closing" });
+    }
+  }
+  if ((id === "stronger-regularization" || id === "weaker-regularization") && curves.sweep !== null) {
+    sharpenBySweep(id, draft, ctx, curves.sweep);
+  }
+  const epochs = curves.epochs;
+  if (id === "early-stopping") {
+    if (epochs !== null && epochs.stoppedLate) {
+      draft.score += EPOCH_CONFIRMED_BONUS;
+      draft.evidence.push(epochMinimum(epochs, ctx.goal));
+    } else {
+      draft.score -= EPOCH_UNCONFIRMED_PENALTY;
+      draft.evidence.push({ kind: "epoch-curve-silent", curve: epochs !== null });
+    }
+  }
+  if (id === "train-longer") {
+    if (epochs !== null && epochs.stoppedEarly) {
+      draft.score += EPOCH_CONFIRMED_BONUS;
+      draft.evidence.push({ kind: "still-improving", epoch: epochs.finalX });
+    } else {
+      draft.score -= EPOCH_UNCONFIRMED_PENALTY;
+      draft.evidence.push({ kind: "epoch-curve-silent", curve: epochs !== null });
+    }
+  }
+  if (id === "weaker-regularization" && ctx.regularization === void 0 && curves.sweep === null) {
+    draft.score -= NOTHING_TO_WEAKEN_PENALTY;
+  }
+}
+function sharpenBySweep(id, draft, ctx, sweep) {
+  const wants = id === "stronger-regularization" ? "below" : "above";
+  const supports = sweep.side === "unknown" ? null : sweep.side === wants;
+  if (supports === null && sweep.atEdge === null) return;
+  const key = ctx.regularization?.key;
+  draft.evidence.push({
+    kind: "sweep-minimum",
+    hyperparameter: key ?? null,
+    bestX: sweep.bestX,
+    bestValidation: sweep.bestValidation,
+    current: ctx.regularization?.value ?? null,
+    suggestedX: sweep.suggestedX,
+    side: sweep.side,
+    supports,
+    atEdge: sweep.atEdge
+  });
+  if (supports === true) {
+    draft.score += SWEEP_AGREES_BONUS;
+    if (key !== void 0) draft.suggestion = sweepSuggestion(key, sweep);
+  } else if (supports === false) draft.score -= SWEEP_DISAGREES_PENALTY;
+}
+
+// src/analysis/levers/secondary.ts
+function secondaryLevers(ctx, curves, drafts) {
+  const epochs = curves.epochs;
+  const { candidate } = ctx;
+  if (epochs !== null && epochs.stoppedLate && !drafts.has("early-stopping")) {
+    drafts.add("early-stopping", EPOCH_CURVE_ALONE, [epochMinimum(epochs, ctx.goal)]);
+  }
+  if (epochs !== null && epochs.stoppedEarly && !drafts.has("train-longer")) {
+    drafts.add("train-longer", EPOCH_CURVE_ALONE, [
+      { kind: "still-improving", epoch: epochs.finalX }
+    ]);
+  }
+  const mismatch = candidate.components.mismatch;
+  if (candidate.diagnosis === "data-mismatch" || mismatch.present) {
+    drafts.add(
+      "align-training-data",
+      candidate.diagnosis === "data-mismatch" ? MISMATCH_DIAGNOSED : MISMATCH_PRESENT,
+      [
+        {
+          kind: "diagnosis",
+          component: "mismatch",
+          value: mismatch.value ?? 0,
+          errorLevel: candidate.errorLevel
+        }
+      ]
+    );
+  }
+  const overfit = candidate.components.overfit;
+  if (overfit.present) {
+    drafts.add("bigger-validation-set", VALIDATION_OVERFIT, [
+      {
+        kind: "diagnosis",
+        component: "overfit",
+        value: overfit.value ?? 0,
+        errorLevel: candidate.errorLevel
+      }
+    ]);
+  }
+  if (candidate.biasUnknown) {
+    drafts.add("supply-reference", SUPPLY_REFERENCE, [{ kind: "reference-missing" }]);
+  }
+  if (ctx.noiseUnknown) {
+    drafts.add("add-repeats", ADD_REPEATS, [{ kind: "noise-unknown" }]);
+  }
+}
+
+// src/analysis/levers/choose.ts
+function chooseLevers(ctx) {
+  const curves = curveEvidence(ctx.candidate.curves);
+  const drafts = new Drafts();
+  ownChangeLevers(ctx, curves, drafts);
+  diagnosisLevers(ctx, curves, drafts);
+  secondaryLevers(ctx, curves, drafts);
+  return { levers: drafts.ranked(), nonLevers: nonLevers(ctx) };
+}
+function nonLevers(ctx) {
+  const biased = ctx.candidate.diagnosis === "high-bias" || ctx.candidate.diagnosis === "high-bias-and-variance";
+  const shrank = ctx.changes.some((c) => c.kind === "lowered" && knobOf(c.key) === "data");
+  return biased || shrank ? ["smaller-training-set"] : [];
+}
+
+// src/analysis/movement.ts
+var TABLE = {
+  down: { down: "better-on-both", flat: "away-from-underfitting", up: "toward-overfitting" },
+  flat: { down: "away-from-overfitting", flat: "no-significant-change", up: "toward-overfitting" },
+  up: { down: "toward-underfitting", flat: "toward-underfitting", up: "worse-on-both" }
+};
+function movementOf(biasCall, varianceCall) {
+  return TABLE[biasCall][varianceCall];
+}
+function validationChangeOf(shortfallCall) {
+  return shortfallCall === "up" ? "worse" : shortfallCall === "down" ? "better" : "flat";
 }
 
 // src/analysis/curves/early-stopping.ts
@@ -21189,10 +22414,10 @@ function gapTrend(points) {
   if (Math.abs(meanGap) <= RELATIVE_CHANGE * Math.abs(meanV)) {
     return { trend: "flat", changePerDoubling: meanGap !== 0 ? sxy / sxx / Math.abs(meanGap) : 0 };
   }
-  const change = sxy / sxx / Math.abs(meanGap);
-  if (change <= -RELATIVE_CHANGE) return { trend: "closing", changePerDoubling: change };
-  if (change < RELATIVE_CHANGE) return { trend: "flat", changePerDoubling: change };
-  return { trend: "unknown", changePerDoubling: change };
+  const change2 = sxy / sxx / Math.abs(meanGap);
+  if (change2 <= -RELATIVE_CHANGE) return { trend: "closing", changePerDoubling: change2 };
+  if (change2 < RELATIVE_CHANGE) return { trend: "flat", changePerDoubling: change2 };
+  return { trend: "unknown", changePerDoubling: change2 };
 }
 
 // src/analysis/curves/lttb.ts
@@ -21351,11 +22576,11 @@ var XTOL = 1e-15;
 var GTOL = 1e-15;
 var OFFSET_TOLERANCE = 1e-5;
 var PLATEAU_PROBE = 0.1;
-function fitLeastSquares(problem) {
-  const { x, y, start, model } = problem;
+function fitLeastSquares(problem2) {
+  const { x, y, start, model } = problem2;
   const nParams = start.length;
-  const lower = start.map((_, j) => problem.bounds?.lower?.[j] ?? -Infinity);
-  const upper = start.map((_, j) => problem.bounds?.upper?.[j] ?? Infinity);
+  const lower = start.map((_, j) => problem2.bounds?.lower?.[j] ?? -Infinity);
+  const upper = start.map((_, j) => problem2.bounds?.upper?.[j] ?? Infinity);
   const clamp = (p2) => p2.map((v, j) => Math.min(Math.max(v, lower[j]), upper[j]));
   const evaluate = (p2) => {
     const r = y.map((yi, i) => yi - model(p2, x[i]));
@@ -21364,14 +22589,14 @@ function fitLeastSquares(problem) {
     return { r, rss };
   };
   const jacobianAt = (p2) => x.map(
-    (xi) => problem.jacobian ? problem.jacobian(p2, xi) : centralDifference(model, p2, xi, start, lower, upper)
+    (xi) => problem2.jacobian ? problem2.jacobian(p2, xi) : centralDifference(model, p2, xi, start, lower, upper)
   );
   let p = clamp(start);
   let state = evaluate(p);
   if (!Number.isFinite(state.rss)) {
-    return verdict(problem, p, state, 0, "non-finite", lower, upper, evaluate, jacobianAt);
+    return verdict(problem2, p, state, 0, "non-finite", lower, upper, evaluate, jacobianAt);
   }
-  const maxIterations = problem.maxIterations ?? 1e3;
+  const maxIterations = problem2.maxIterations ?? 1e3;
   let mu = 1e-3;
   let nu = 2;
   const d = new Array(nParams).fill(0);
@@ -21438,7 +22663,7 @@ function fitLeastSquares(problem) {
       }
     }
   }
-  return verdict(problem, p, state, iteration, stop, lower, upper, evaluate, jacobianAt);
+  return verdict(problem2, p, state, iteration, stop, lower, upper, evaluate, jacobianAt);
 }
 function centralDifference(model, p, xi, start, lower, upper) {
   return p.map((pj, j) => {
@@ -21502,8 +22727,8 @@ function scaledNorm(v, d) {
   v.forEach((vi, j) => s = Math.hypot(s, vi * (d[j] > 0 ? d[j] : 1)));
   return s;
 }
-function verdict(problem, p, state, iterations, stop, lower, upper, evaluate, jacobianAt) {
-  const n = problem.y.length;
+function verdict(problem2, p, state, iterations, stop, lower, upper, evaluate, jacobianAt) {
+  const n = problem2.y.length;
   const nParams = p.length;
   const base = { params: p, rss: state.rss, iterations, stop };
   if (!Number.isFinite(state.rss)) {
@@ -21528,18 +22753,18 @@ function verdict(problem, p, state, iterations, stop, lower, upper, evaluate, ja
   const flat = p.map((pj, j) => {
     if (!free.includes(j)) return false;
     if (norms[j] === 0) return true;
-    const h = PLATEAU_PROBE * Math.max(Math.abs(pj), Math.abs(problem.start[j]));
+    const h = PLATEAU_PROBE * Math.max(Math.abs(pj), Math.abs(problem2.start[j]));
     if (h === 0) return false;
     const probe = (v) => {
       const q = p.slice();
       q[j] = Math.min(Math.max(v, lower[j]), upper[j]);
       return evaluate(q).rss;
     };
-    const change = Math.max(
+    const change2 = Math.max(
       Math.abs(probe(pj + h) - state.rss),
       Math.abs(probe(pj - h) - state.rss)
     );
-    return !(change > 1e-12 * state.rss);
+    return !(change2 > 1e-12 * state.rss);
   });
   const scaled = jac.map(
     (row) => free.map((j) => norms[j] > 0 ? row[j] / norms[j] : 0)
@@ -21551,7 +22776,7 @@ function verdict(problem, p, state, iterations, stop, lower, upper, evaluate, ja
     const q2 = Math.hypot(...qr.qtb.slice(free.length));
     if (q2 > 0) relativeOffset = q1 / Math.sqrt(free.length) / (q2 / Math.sqrt(dof));
   }
-  const yNorm = Math.hypot(...problem.y);
+  const yNorm = Math.hypot(...problem2.y);
   const zeroResidual = Math.sqrt(state.rss) <= 1e-10 * yNorm;
   const inverse = qr ? inverseOfRtR(qr.r) : null;
   let covariance = null;
@@ -21567,7 +22792,7 @@ function verdict(problem, p, state, iterations, stop, lower, upper, evaluate, ja
   let reason;
   let converged = false;
   const flatAt = flat.flatMap(
-    (f, j) => f ? [`${problem.names?.[j] ?? `p${j + 1}`} = ${p[j].toPrecision(4)}`] : []
+    (f, j) => f ? [`${problem2.names?.[j] ?? `p${j + 1}`} = ${p[j].toPrecision(4)}`] : []
   );
   if (stop === "max-iterations") reason = `no convergence within ${iterations} iterations`;
   else if (flatAt.length > 0)
@@ -21628,11 +22853,17 @@ function fitPowerLaw(m, e, options) {
   const meanE = e.reduce((s, v) => s + v, 0) / e.length;
   const tss = e.reduce((s, v) => s + (v - meanE) ** 2, 0);
   const level = options.level ?? 0.95;
-  const t = best.dof > 0 ? tQuantile(1 - (1 - level) / 2, best.dof) : NaN;
+  const cAtBound = best.atBound[2] === true && best.atBound[1] !== true;
+  const full = cAtBound ? fullCovariance(
+    u.map((ui) => jacobian([bigA, b, c], ui)),
+    best.rss
+  ) : null;
+  const cov = full ? full.covariance : best.covariance;
+  const dof = full ? full.dof : best.dof;
+  const t = dof > 0 ? tQuantile(1 - (1 - level) / 2, dof) : NaN;
   const projections = multiples.map((k) => {
     const error = model([bigA, b, c], k);
     const g = jacobian([bigA, b, c], k);
-    const cov = best.covariance;
     let variance = NaN;
     if (cov) {
       variance = 0;
@@ -21656,8 +22887,25 @@ function fitPowerLaw(m, e, options) {
     rss: best.rss,
     dof: best.dof,
     atBound: { b: best.atBound[1] === true, c: best.atBound[2] === true },
+    intervalCovariance: full ? "full" : "free",
     projections
   };
+}
+function fullCovariance(jac, rss) {
+  const n = jac.length;
+  const p = jac[0]?.length ?? 0;
+  const dof = n - p;
+  if (dof <= 0) return null;
+  const norms = Array.from({ length: p }, (_, j) => Math.hypot(...jac.map((row) => row[j] ?? 0)));
+  if (norms.some((v) => !(v > 0) || !Number.isFinite(v))) return null;
+  const scaled = jac.map((row) => row.map((v, j) => v / norms[j]));
+  const inverse = inverseOfRtR(qrLeastSquares(scaled, new Array(n).fill(0)).r);
+  if (!inverse) return null;
+  const s2 = rss / dof;
+  const covariance = inverse.map(
+    (row, j) => row.map((v, k) => s2 * v / (norms[j] * norms[k]))
+  );
+  return { covariance, dof };
 }
 function startingValues(u, e, lower) {
   const minE = Math.min(...e);
@@ -21689,7 +22937,7 @@ var MIN_REGULARIZATION_POINTS = 3;
 function regularizationMinimum(x, validationError, lambda) {
   const n = x.length;
   if (n < MIN_REGULARIZATION_POINTS) {
-    return { skipped: `needs at least ${MIN_REGULARIZATION_POINTS} points, has ${n}` };
+    return { skipped: "too-few-points", points: n, needs: MIN_REGULARIZATION_POINTS };
   }
   let i = 0;
   validationError.forEach((v, j) => {
@@ -21713,10 +22961,10 @@ function regularizationMinimum(x, validationError, lambda) {
     const [x0, x1, x2] = [lx[i - 1], lx[i], lx[i + 1]];
     const [y0, y1, y2] = [validationError[i - 1], validationError[i], validationError[i + 1]];
     step = (x2 - x0) / 2;
-    const num2 = (x1 - x0) ** 2 * (y1 - y2) - (x1 - x2) ** 2 * (y1 - y0);
+    const num = (x1 - x0) ** 2 * (y1 - y2) - (x1 - x2) ** 2 * (y1 - y0);
     const den = (x1 - x0) * (y1 - y2) - (x1 - x2) * (y1 - y0);
     if (den !== 0) {
-      logBest = x1 - num2 / (2 * den);
+      logBest = x1 - num / (2 * den);
       refined = true;
     }
     suggestedX = Math.exp(logBest);
@@ -21731,6 +22979,7 @@ function regularizationMinimum(x, validationError, lambda) {
 }
 
 // src/analysis/curves/index.ts
+var MIN_EPOCH_POINTS = 2;
 var CHART_POINTS = 60;
 function analyzeCurves(curves, context) {
   const report = {};
@@ -21764,7 +23013,8 @@ function chart(points, scale, keep) {
   });
 }
 function analyzeEpochs(points, scale) {
-  if (points.length < 2) return { skipped: `needs at least 2 points, has ${points.length}` };
+  if (points.length < MIN_EPOCH_POINTS)
+    return { skipped: "too-few-points", points: points.length, needs: MIN_EPOCH_POINTS };
   const validation = points.map((p) => scale.toError(p.validation));
   const hasTrain = points.every((p) => p.train !== void 0);
   const train = hasTrain ? points.map((p) => scale.toError(p.train)) : null;
@@ -21792,8 +23042,14 @@ function analyzeEpochs(points, scale) {
 function analyzeLearningCurve(points, scale) {
   const m = points.map((p) => p.x);
   const e = points.map((p) => scale.toError(p.validation));
+  const tooFew = {
+    skipped: "too-few-points",
+    points: m.length,
+    needs: MIN_POWER_LAW_POINTS
+  };
+  if (m.length < MIN_POWER_LAW_POINTS) return tooFew;
   const fit = fitPowerLaw(m, e, { lower: scale.lower, upper: scale.upper });
-  if ("skipped" in fit) return fit;
+  if ("skipped" in fit) return { ...tooFew, skipped: "fit-failed" };
   const gap = gapTrend(
     points.map(
       (p) => p.train === void 0 ? { x: p.x, validationError: scale.toError(p.validation) } : {
@@ -21843,544 +23099,51 @@ function analyzeRegularization(points, scale, lambda) {
   };
 }
 
-// src/analysis/measure.ts
-function shortfallSign(run) {
-  return run.metric.goal === "minimize" ? 1 : -1;
-}
-function splitMeasure(split) {
-  return { terms: [{ split, weight: 1 }], constant: 0 };
-}
-function perRepeat(run, measure) {
-  const sign = shortfallSign(run);
-  const columns = [];
-  for (const term of measure.terms) {
-    const split = run.splits[term.split];
-    if (split === void 0) return null;
-    columns.push({ values: split.values, weight: term.weight });
+// src/analysis/run-summary.ts
+function splitSummary(run, split, alpha) {
+  const s = run.splits[split];
+  if (s === void 0) return null;
+  const m = mean(s.values);
+  const n = s.values.length;
+  const sd = n >= 2 ? Math.sqrt(sampleVariance(s.values)) : null;
+  let ci = null;
+  if (sd !== null) {
+    const half = tQuantile(1 - alpha / 2, n - 1) * (sd / Math.sqrt(n));
+    ci = [m - half, m + half];
+  } else if (run.metric.kind === "proportion" && s.examples !== void 0) {
+    ci = wilsonInterval(Math.round(m * s.examples), s.examples, alpha);
   }
-  const repeats = run.splits.train.values.length;
-  const out = [];
-  for (let i = 0; i < repeats; i++) {
-    let total = measure.constant;
-    for (const column of columns) total += column.weight * sign * (column.values[i] ?? Number.NaN);
-    out.push(total);
+  return { split, mean: m, sd, repeats: n, examples: s.examples ?? null, ci };
+}
+function regularizationOf(run) {
+  for (const [key, value2] of Object.entries(run.hyperparameters ?? {})) {
+    if (typeof value2 === "number" && knobOf(key) === "regularization" && !/dropout/i.test(key))
+      return { key, value: value2 };
   }
-  return out;
+  return void 0;
 }
-function binomialMeasureVariance(run, measure) {
-  if (run.metric.kind !== "proportion") return null;
-  let total = 0;
-  for (const term of measure.terms) {
-    const split = run.splits[term.split];
-    if (split?.examples === void 0) return null;
-    const repeats = split.values.length;
-    total += term.weight * term.weight * binomialVariance(mean(split.values), split.examples * repeats);
-  }
-  return total;
-}
-
-// src/analysis/noise.ts
-function callOf(result, settings) {
-  const big = Math.abs(result.estimate) >= settings.minEffect && result.estimate !== 0;
-  const significant = result.p === null ? settings.minEffect > 0 : result.p < settings.alpha;
-  if (!big || !significant) return "flat";
-  return result.estimate > 0 ? "up" : "down";
-}
-function toDelta(result, settings) {
+function summarize(run, settings) {
+  const reference = chooseReference(run, settings.reference);
+  const components = decompose(run, reference.value, settings);
+  const lambda = regularizationOf(run)?.value;
   return {
-    estimate: result.estimate,
-    ci: result.ci,
-    p: result.p,
-    test: result.test,
-    call: callOf(result, settings)
+    name: run.run.name,
+    commit: run.run.commit ?? null,
+    createdAt: run.run.createdAt ?? null,
+    reference: reference.value,
+    referenceSource: reference.source,
+    splits: SPLIT_NAMES.flatMap((s) => splitSummary(run, s, settings.alpha) ?? []),
+    errorLevel: errorLevel(run),
+    components,
+    diagnosis: diagnose(components),
+    biasUnknown: reference.value === null,
+    warnings: components.overfit.present ? ["validation-overfit"] : [],
+    curves: analyzeCurves(run.curves, {
+      ...lambda === void 0 ? {} : { lambda },
+      kind: run.metric.kind,
+      goal: run.metric.goal
+    })
   };
-}
-function measureChange(baseline, candidate, measure, alpha) {
-  const b = perRepeat(baseline, measure.baseline);
-  const c = perRepeat(candidate, measure.candidate);
-  if (b === null || c === null) return null;
-  const estimate = mean(c) - mean(b);
-  if (b.length >= 2 && c.length >= 2) return welchT(b, c, alpha);
-  const vb = binomialMeasureVariance(baseline, measure.baseline);
-  const vc = binomialMeasureVariance(candidate, measure.candidate);
-  if (vb !== null && vc !== null) return normalTest(estimate, vb + vc, alpha, "z-binomial");
-  return { estimate, ci: null, p: null, test: "none" };
-}
-function measureLevel(run, measure, alpha) {
-  const values = perRepeat(run, measure);
-  if (values === null) return null;
-  const value = mean(values);
-  if (values.length >= 2) {
-    const t = oneSampleT(values, alpha);
-    return { value, ci: t.ci, p: t.pGreater };
-  }
-  const variance = binomialMeasureVariance(run, measure);
-  if (variance !== null) {
-    const z = normalTest(value, variance, alpha, "z-binomial");
-    const p = variance > 0 ? 1 - normalCdf(value / Math.sqrt(variance)) : value > 0 ? 0 : 1;
-    return { value, ci: z.ci, p };
-  }
-  return { value, ci: null, p: null };
-}
-function toMetricUnits(result, sign) {
-  if (sign === 1) return result;
-  return {
-    ...result,
-    estimate: -result.estimate,
-    ci: result.ci === null ? null : [-result.ci[1], -result.ci[0]],
-    ...result.statistic === void 0 ? {} : { statistic: -result.statistic }
-  };
-}
-
-// src/analysis/decompose.ts
-function chooseReference(run, override) {
-  if (override !== void 0) return { value: override, source: "config" };
-  if (run.reference !== void 0) return { value: run.reference, source: "artifact" };
-  if (run.metric.kind === "proportion" && run.metric.goal === "minimize")
-    return { value: 0, source: "default" };
-  return { value: null, source: "unknown" };
-}
-function componentMeasures(run, reference) {
-  const sign = shortfallSign(run);
-  const hasDev = run.splits.train_dev !== void 0;
-  return {
-    bias: reference === null ? null : { terms: [{ split: "train", weight: 1 }], constant: -sign * reference },
-    variance: {
-      terms: [
-        { split: hasDev ? "train_dev" : "validation", weight: 1 },
-        { split: "train", weight: -1 }
-      ],
-      constant: 0
-    },
-    mismatch: hasDev ? {
-      terms: [
-        { split: "validation", weight: 1 },
-        { split: "train_dev", weight: -1 }
-      ],
-      constant: 0
-    } : null,
-    overfit: run.splits.test !== void 0 ? {
-      terms: [
-        { split: "test", weight: 1 },
-        { split: "validation", weight: -1 }
-      ],
-      constant: 0
-    } : null
-  };
-}
-function errorLevel(run) {
-  const m = mean(run.splits.validation.values);
-  return Math.abs(run.metric.goal === "minimize" ? m : 1 - m);
-}
-var UNAVAILABLE = {
-  bias: 'No reference level: give "reference" in the artifact or the config (human-level error, a prior system, or an estimated Bayes error).',
-  variance: "Needs train and validation values.",
-  mismatch: "Needs a train_dev split (held-out data from the training distribution).",
-  overfit: "Needs a test split."
-};
-function decompose(run, reference, settings) {
-  const measures = componentMeasures(run, reference);
-  const threshold = Math.max(settings.gapTolerance * errorLevel(run), settings.minEffect);
-  const out = {};
-  for (const name of ["bias", "variance", "mismatch", "overfit"]) {
-    const measure = measures[name];
-    const level = measure === null ? null : measureLevel(run, measure, settings.alpha);
-    if (level === null) {
-      out[name] = {
-        name,
-        value: null,
-        unavailable: UNAVAILABLE[name],
-        ci: null,
-        p: null,
-        present: false
-      };
-      continue;
-    }
-    const significant = level.p === null || level.p < settings.alpha;
-    const present = level.value > 0 && level.value >= threshold && significant;
-    out[name] = { name, value: level.value, ci: level.ci, p: level.p, present };
-  }
-  return out;
-}
-function diagnose(components) {
-  const candidates = ["bias", "variance", "mismatch"].map((name) => components[name]).filter((c) => c.present && c.value !== null).sort((a, b) => (b.value ?? 0) - (a.value ?? 0));
-  const top = candidates[0];
-  if (top === void 0) return "good-fit";
-  const bias = components.bias;
-  const variance = components.variance;
-  if (bias.present && variance.present && bias.value !== null && variance.value !== null) {
-    const ratio = Math.max(bias.value, variance.value) / Math.min(bias.value, variance.value);
-    if (ratio <= 2 && (top.name === "bias" || top.name === "variance"))
-      return "high-bias-and-variance";
-  }
-  if (top.name === "bias") return "high-bias";
-  if (top.name === "variance") return "high-variance";
-  return "data-mismatch";
-}
-
-// src/analysis/format.ts
-function formatValue(value, kind) {
-  if (kind === "proportion") return `${(value * 100).toFixed(Math.abs(value) < 1e-3 ? 2 : 1)}%`;
-  return formatNumber(value);
-}
-function formatChange(value, kind) {
-  const sign = value > 0 ? "+" : value < 0 ? "\u2212" : "\xB1";
-  const magnitude = Math.abs(value);
-  if (kind === "proportion")
-    return `${sign}${(magnitude * 100).toFixed(magnitude < 1e-3 ? 2 : 1)} pts`;
-  return `${sign}${formatNumber(magnitude)}`;
-}
-function formatNumber(value) {
-  if (value === 0) return "0";
-  const abs = Math.abs(value);
-  if (abs >= 1e5 || abs < 1e-3) return value.toExponential(2);
-  return Number(value.toPrecision(4)).toString();
-}
-function formatP(p) {
-  if (p === null) return "n/a";
-  return p < 1e-3 ? "< 0.001" : p.toFixed(3);
-}
-
-// src/analysis/gate.ts
-var RULES = {
-  "worse-validation": (r) => r.validation.change === "worse" ? "validation got significantly worse" : null,
-  "toward-overfitting": (r) => r.movement === "toward-overfitting" ? "the change moved toward overfitting" : null,
-  "toward-underfitting": (r) => r.movement === "toward-underfitting" ? "the change moved toward underfitting" : null,
-  "worse-on-both": (r) => r.movement === "worse-on-both" ? "bias and variance both got worse" : null,
-  "any-movement": (r) => r.movement !== "no-significant-change" ? `the model moved (${r.movement})` : null,
-  "slice-regression": (r) => {
-    const worse = r.slices.filter((s) => s.change === "worse");
-    return worse.length > 0 ? `${worse.length} slice(s) regressed significantly` : null;
-  },
-  "high-bias": (r) => r.candidate.diagnosis === "high-bias" || r.candidate.diagnosis === "high-bias-and-variance" ? "the candidate has high bias" : null,
-  "high-variance": (r) => r.candidate.diagnosis === "high-variance" || r.candidate.diagnosis === "high-bias-and-variance" ? "the candidate has high variance" : null,
-  "data-mismatch": (r) => r.candidate.diagnosis === "data-mismatch" ? "the candidate shows data mismatch" : null,
-  "validation-overfit": (r) => r.candidate.components.overfit.present ? "the candidate overfits the validation set (test error well above validation)" : null,
-  none: () => null
-};
-function applyGate(review) {
-  const failOn = review.settings.failOn;
-  const reasons = [];
-  for (const policy of failOn) {
-    const reason = RULES[policy]?.(review) ?? null;
-    if (reason !== null) reasons.push(`${policy}: ${reason}`);
-  }
-  return { pass: reasons.length === 0, reasons, failOn: [...failOn] };
-}
-
-// src/analysis/hyperparameters.ts
-function diffHyperparameters(baseline = {}, candidate = {}) {
-  const keys = [.../* @__PURE__ */ new Set([...Object.keys(baseline), ...Object.keys(candidate)])].sort();
-  const out = [];
-  for (const key of keys) {
-    const inB = Object.hasOwn(baseline, key);
-    const inC = Object.hasOwn(candidate, key);
-    const b = baseline[key];
-    const c = candidate[key];
-    if (!inB) out.push({ key, baseline: null, candidate: c, kind: "added" });
-    else if (!inC) out.push({ key, baseline: b, candidate: null, kind: "removed" });
-    else if (typeof b === "number" && typeof c === "number") {
-      if (c > b) out.push({ key, baseline: b, candidate: c, kind: "raised" });
-      else if (c < b) out.push({ key, baseline: b, candidate: c, kind: "lowered" });
-    } else if (JSON.stringify(b) !== JSON.stringify(c))
-      out.push({ key, baseline: b, candidate: c, kind: "changed" });
-  }
-  return out;
-}
-var KNOBS = [
-  [
-    /^(lambda|l2|l2_penalty|weight_decay|reg(ularization)?(_strength)?|ridge_alpha|dropout)$/i,
-    "regularization"
-  ],
-  [/^(features|num_features|n_features|feature_count)$/i, "features"],
-  [/^(polynomial_degree|poly_degree|degree|interaction_terms)$/i, "feature-richness"],
-  [/^(train_examples|training_examples|n_train|train_size|num_train)$/i, "data"],
-  [/^(epochs|max_epochs|num_epochs|iterations|max_iter|steps)$/i, "epochs"],
-  [
-    /^(hidden_units|hidden_size|layers|num_layers|depth|max_depth|width|params|parameters|model_size|n_estimators)$/i,
-    "model-size"
-  ]
-];
-function knobOf(key) {
-  for (const [pattern, knob] of KNOBS) if (pattern.test(key)) return knob;
-  return null;
-}
-var PULLED = {
-  regularization: { raised: "stronger-regularization", lowered: "weaker-regularization" },
-  features: { raised: "more-features", lowered: "fewer-features" },
-  "feature-richness": { raised: "richer-features", lowered: "fewer-features" },
-  data: { raised: "more-data", lowered: "more-data" },
-  epochs: { raised: "train-longer", lowered: "early-stopping" },
-  "model-size": { raised: "bigger-model", lowered: "smaller-model" }
-};
-function pulledLevers(changes) {
-  const out = [];
-  for (const change of changes) {
-    if (change.kind !== "raised" && change.kind !== "lowered") continue;
-    const knob = knobOf(change.key);
-    if (knob === null) continue;
-    if (knob === "data" && change.kind === "lowered") continue;
-    out.push({ lever: PULLED[knob][change.kind], change, knob });
-  }
-  return out;
-}
-
-// src/analysis/levers/choose.ts
-var LEVER_CATALOGUE = {
-  "more-data": { addresses: "variance", meaning: "train on more examples" },
-  "fewer-features": { addresses: "variance", meaning: "drop weak or redundant features" },
-  "stronger-regularization": {
-    addresses: "variance",
-    meaning: "raise the regularization strength"
-  },
-  "smaller-model": { addresses: "variance", meaning: "reduce model capacity" },
-  "early-stopping": { addresses: "variance", meaning: "stop at the validation minimum" },
-  "more-features": { addresses: "bias", meaning: "add informative features" },
-  "richer-features": { addresses: "bias", meaning: "add polynomial or interaction terms" },
-  "weaker-regularization": { addresses: "bias", meaning: "lower the regularization strength" },
-  "bigger-model": { addresses: "bias", meaning: "increase model capacity" },
-  "train-longer": { addresses: "bias", meaning: "train for more epochs" },
-  "align-training-data": {
-    addresses: "mismatch",
-    meaning: "make training data look like validation data"
-  },
-  "bigger-validation-set": {
-    addresses: "validation-overfit",
-    meaning: "enlarge or refresh the validation set"
-  },
-  "add-repeats": { addresses: "evidence", meaning: "repeat training with other seeds" },
-  "supply-reference": { addresses: "evidence", meaning: "give a reference level" }
-};
-var BY_TARGET = {
-  variance: [
-    "more-data",
-    "stronger-regularization",
-    "fewer-features",
-    "early-stopping",
-    "smaller-model"
-  ],
-  bias: [
-    "richer-features",
-    "more-features",
-    "weaker-regularization",
-    "bigger-model",
-    "train-longer"
-  ]
-};
-var SMALLER_TRAINING_SET_NOTE = "A smaller training set is not a cure for high bias: it only lowers the training error, while validation error stays high or rises.";
-function learning(curves) {
-  const c = curves.training_examples;
-  return c !== void 0 && !("skipped" in c) ? c : null;
-}
-function regularization(curves) {
-  const c = curves.regularization;
-  return c !== void 0 && !("skipped" in c) ? c : null;
-}
-function epochs(curves) {
-  const c = curves.epochs;
-  return c !== void 0 && !("skipped" in c) ? c : null;
-}
-function targets(diagnosis, run) {
-  const b = run.components.bias.value ?? 0;
-  const v = run.components.variance.value ?? 0;
-  switch (diagnosis) {
-    case "high-variance":
-      return ["variance"];
-    case "high-bias":
-      return ["bias"];
-    case "high-bias-and-variance":
-      return b >= v ? ["bias", "variance"] : ["variance", "bias"];
-    default:
-      return [];
-  }
-}
-function chooseLevers(ctx) {
-  const { kind } = ctx;
-  const v = (x) => formatValue(x, kind);
-  const curves = ctx.candidate.curves;
-  const drafts = /* @__PURE__ */ new Map();
-  const add = (id, score, reason, evidence = []) => {
-    const existing = drafts.get(id);
-    if (existing === void 0 || existing.score < score)
-      drafts.set(id, { id, reason, evidence, score });
-  };
-  const pulled = new Map(ctx.pulled.map((p) => [p.lever, p]));
-  const pulledNote = (id) => {
-    const p = pulled.get(id);
-    if (p === void 0) return null;
-    return `this PR already ${p.change.kind} ${p.change.key} (${String(p.change.baseline)} \u2192 ${String(p.change.candidate)})`;
-  };
-  const lc = learning(curves);
-  const reg = regularization(curves);
-  const ep = epochs(curves);
-  const stopEarlierReason = (e) => `Validation minimum at epoch ${formatNumber(e.bestX)} of ${formatNumber(e.finalX)}; stopping there saves ${formatChange(e.finalValidation - e.bestValidation, kind).replace(/^\+/, "")}${e.gl === null ? "" : ` (generalization loss ${e.gl.toFixed(1)}%)`}.`;
-  const trainLongerReason = (e) => `Train and validation ${ctx.metricName} were both still falling at epoch ${formatNumber(e.finalX)}: train longer.`;
-  for (const p of ctx.pulled) {
-    const { baseline: from, candidate: to } = p.change;
-    if (typeof from !== "number" || typeof to !== "number") continue;
-    const between = from > 0 && to > 0 ? Math.sqrt(from * to) : (from + to) / 2;
-    const overshotTowardBias = ctx.movement === "toward-underfitting" || ctx.movement === "worse-on-both";
-    const overshotTowardVariance = ctx.movement === "toward-overfitting" || ctx.movement === "worse-on-both";
-    if (p.lever === "stronger-regularization" && overshotTowardBias) {
-      add(
-        "weaker-regularization",
-        100,
-        `${p.change.key} rose ${from} \u2192 ${to} and moved the model toward underfitting (\u0394bias ${formatChange(ctx.bias.estimate, kind)}); try ${p.change.key} \u2248 ${formatNumber(between)}, between the two.`,
-        [`\u0394bias ${formatChange(ctx.bias.estimate, kind)}, p ${formatP(ctx.bias.p)}`]
-      );
-    }
-    if (p.lever === "weaker-regularization" && overshotTowardVariance) {
-      add(
-        "stronger-regularization",
-        100,
-        `${p.change.key} fell ${from} \u2192 ${to} and moved the model toward overfitting (\u0394variance ${formatChange(ctx.variance.estimate, kind)}); try ${p.change.key} \u2248 ${formatNumber(between)}, between the two.`,
-        [`\u0394variance ${formatChange(ctx.variance.estimate, kind)}, p ${formatP(ctx.variance.p)}`]
-      );
-    }
-    if ((p.lever === "richer-features" || p.lever === "more-features" || p.lever === "bigger-model") && overshotTowardVariance) {
-      const back = p.lever === "bigger-model" ? "smaller-model" : "fewer-features";
-      add(
-        back,
-        90,
-        `${p.change.key} rose ${from} \u2192 ${to} and moved the model toward overfitting (\u0394variance ${formatChange(ctx.variance.estimate, kind)}); step back toward ${formatNumber(between)} or keep it and regularize harder.`,
-        [`\u0394variance ${formatChange(ctx.variance.estimate, kind)}`]
-      );
-      if (reg !== null && reg.side === "below") {
-        add(
-          "stronger-regularization",
-          95,
-          `Keep the new ${p.change.key} and regularize harder: the candidate's sweep has its validation minimum at \u03BB \u2248 ${formatNumber(reg.bestX)}${ctx.lambda === void 0 ? "" : ` (it uses ${formatNumber(ctx.lambda)})`}; try ${formatNumber(reg.suggestedX)}.`,
-          [`lowest validation ${v(reg.bestValidation)} at \u03BB \u2248 ${formatNumber(reg.bestX)}`]
-        );
-      } else {
-        add(
-          "stronger-regularization",
-          85,
-          `Keep the new ${p.change.key} but counter its extra variance with stronger regularization.`,
-          []
-        );
-      }
-    }
-  }
-  const order = targets(ctx.candidate.diagnosis, ctx.candidate);
-  order.forEach((target, t) => {
-    const component = ctx.candidate.components[target];
-    const label = target === "bias" ? "avoidable bias" : "variance";
-    const size = component.value === null ? "" : `: ${label} ${v(component.value)} against a validation error of ${v(ctx.candidate.errorLevel)}`;
-    BY_TARGET[target].forEach((id, i) => {
-      let score = 60 - t * 20 - i * 2;
-      let reason = `The candidate has high ${target}${size}.`;
-      const evidence = [];
-      if (id === "more-data" && lc !== null) {
-        const twice = lc.projections[0];
-        if (twice !== void 0) {
-          reason = `2\xD7 data projects validation ${ctx.metricName} ${v(ctx.candidate.splits.find((s) => s.split === "validation")?.mean ?? 0)} \u2192 ${v(twice.validation)} (power-law fit R\xB2 ${lc.r2.toFixed(2)}).`;
-          evidence.push(
-            `fit e(m) = ${formatNumber(lc.a)}\xB7m^\u2212${formatNumber(lc.b)} + ${formatNumber(lc.c)}; at ${formatNumber(twice.x)} examples: ${v(twice.ci[0])} to ${v(twice.ci[1])}`
-          );
-        }
-        if (lc.gapTrend === "flat") {
-          score -= 25;
-          reason = `More data will help little: the train/validation gap is flat at the right end of the learning curve.`;
-        } else if (lc.gapTrend === "closing") score += 8;
-      }
-      if ((id === "stronger-regularization" || id === "weaker-regularization") && reg !== null) {
-        const wants = id === "stronger-regularization" ? "below" : "above";
-        if (reg.atEdge !== null) {
-          evidence.push(
-            `the sweep's minimum is at its ${reg.atEdge} end (${formatNumber(reg.bestX)}): extend the sweep`
-          );
-        }
-        if (reg.side === wants) {
-          score += 10;
-          reason = `The regularization sweep has its validation minimum at \u03BB \u2248 ${formatNumber(reg.bestX)}${ctx.lambda === void 0 ? "" : `, the candidate uses ${formatNumber(ctx.lambda)}`}; try ${formatNumber(reg.suggestedX)}.`;
-        } else if (reg.side !== "unknown") {
-          score -= 20;
-          const meaning = LEVER_CATALOGUE[id].meaning;
-          reason = `${meaning.charAt(0).toUpperCase()}${meaning.slice(1)}, but the sweep's validation minimum (\u03BB \u2248 ${formatNumber(reg.bestX)}) is on the other side.`;
-        }
-      }
-      if (id === "early-stopping") {
-        if (ep !== null && ep.stoppedLate) {
-          score += 12;
-          reason = stopEarlierReason(ep);
-        } else {
-          score -= 15;
-          reason = `${reason} ${ep === null ? "No epoch curve to confirm it." : "The epoch curve does not show training past the validation minimum."}`;
-        }
-      }
-      if (id === "train-longer") {
-        if (ep !== null && ep.stoppedEarly) {
-          score += 12;
-          reason = trainLongerReason(ep);
-        } else {
-          score -= 15;
-          reason = `${reason} ${ep === null ? "No epoch curve to confirm it." : "The epoch curve does not show both errors still falling at the end."}`;
-        }
-      }
-      if (id === "weaker-regularization" && ctx.lambda === void 0 && reg === null) score -= 10;
-      const note = pulledNote(id);
-      if (note !== null) {
-        score -= 30;
-        reason = `${reason} Note: ${note}; judge its effect before pulling further.`;
-      }
-      add(id, score, reason, evidence);
-    });
-  });
-  if (ep !== null && ep.stoppedLate && !drafts.has("early-stopping")) {
-    add("early-stopping", 35, stopEarlierReason(ep));
-  }
-  if (ep !== null && ep.stoppedEarly && !drafts.has("train-longer")) {
-    add("train-longer", 35, trainLongerReason(ep));
-  }
-  if (ctx.candidate.diagnosis === "data-mismatch" || ctx.candidate.components.mismatch.present) {
-    const d = ctx.candidate.components.mismatch.value ?? 0;
-    add(
-      "align-training-data",
-      ctx.candidate.diagnosis === "data-mismatch" ? 70 : 30,
-      `Validation error exceeds train_dev error by ${v(d)}: the training data does not look like the validation data; collect or synthesise training data that resembles it.`
-    );
-  }
-  if (ctx.candidate.components.overfit.present) {
-    add(
-      "bigger-validation-set",
-      40,
-      `Test error exceeds validation error by ${v(ctx.candidate.components.overfit.value ?? 0)}: choices may be tuned to the validation set; enlarge or refresh it.`
-    );
-  }
-  if (ctx.candidate.biasUnknown) {
-    add(
-      "supply-reference",
-      20,
-      'Bias is unknown without a reference level: add "reference" (human-level error, a prior system, or an estimated Bayes error) to the artifacts or the config.'
-    );
-  }
-  if (ctx.noiseUnknown) {
-    add(
-      "add-repeats",
-      15,
-      "Run-to-run noise is unknown: train with 2 or more seeds (or ship per-example predictions) so changes can be tested."
-    );
-  }
-  const levers = [...drafts.values()].sort((a, b) => b.score - a.score).map(({ id, reason, evidence }) => ({ id, reason, evidence }));
-  const nonLevers = [];
-  const biasy = ctx.candidate.diagnosis === "high-bias" || ctx.candidate.diagnosis === "high-bias-and-variance";
-  const shrank = ctx.changes.some((c) => c.kind === "lowered" && knobOf(c.key) === "data");
-  if (biasy || shrank) nonLevers.push(SMALLER_TRAINING_SET_NOTE);
-  return { levers, nonLevers };
-}
-
-// src/analysis/movement.ts
-var TABLE = {
-  down: { down: "better-on-both", flat: "away-from-underfitting", up: "toward-overfitting" },
-  flat: { down: "away-from-overfitting", flat: "no-significant-change", up: "toward-overfitting" },
-  up: { down: "toward-underfitting", flat: "toward-underfitting", up: "worse-on-both" }
-};
-function movementOf(biasCall, varianceCall) {
-  return TABLE[biasCall][varianceCall];
-}
-function validationChangeOf(shortfallCall) {
-  return shortfallCall === "up" ? "worse" : shortfallCall === "down" ? "better" : "flat";
 }
 
 // src/analysis/slices.ts
@@ -22406,258 +23169,171 @@ function compareSlices(baseline, candidate, aggregate, settings) {
   }
   unpaired.push(...base.keys());
   const adjusted = holmAdjust(pairs.map((p) => p.test.p));
-  const slices = pairs.map(({ b, c, test }, i) => {
+  const slices2 = pairs.map(({ b, c, test: test2 }, i) => {
     const pAdjusted = adjusted[i] ?? null;
-    const call = callOf({ ...test, p: pAdjusted }, settings);
-    const change = call === "flat" ? "flat" : call === "up" === (sign === 1) ? "worse" : "better";
+    const call = callOf({ ...test2, p: pAdjusted }, settings);
+    const change2 = call === "flat" ? "flat" : call === "up" === (sign === 1) ? "worse" : "better";
     return {
       name: c.name,
       examples: c.examples ?? null,
       baseline: b.validation,
       candidate: c.validation,
-      delta: {
-        estimate: test.estimate,
-        ci: test.ci,
-        p: test.p,
-        test: test.test,
-        call: callOf(test, settings)
-      },
+      delta: toMetricDelta(test2, settings),
       pAdjusted,
-      change,
-      hiddenRegression: change === "worse" && aggregate === "better"
+      change: change2,
+      hiddenRegression: change2 === "worse" && aggregate === "better"
     };
   });
-  return { slices, unpaired };
+  return { slices: slices2, unpaired };
 }
 
 // src/analysis/review.ts
-function splitSummary(run, split, alpha) {
-  const s = run.splits[split];
-  if (s === void 0) return null;
-  const m = mean(s.values);
-  const n = s.values.length;
-  const sd = n >= 2 ? Math.sqrt(sampleVariance(s.values)) : null;
-  let ci = null;
-  if (sd !== null) {
-    const half = tQuantile(1 - alpha / 2, n - 1) * (sd / Math.sqrt(n));
-    ci = [m - half, m + half];
-  } else if (run.metric.kind === "proportion" && s.examples !== void 0) {
-    ci = wilsonInterval(Math.round(m * s.examples), s.examples, alpha);
-  }
-  return { split, mean: m, sd, repeats: n, examples: s.examples ?? null, ci };
+var NOTE_NAMES = 5;
+function failOnOf(values) {
+  return values.map((value2) => {
+    if (!isFailOn(value2)) throw new RangeError(`unknown fail-on outcome ${JSON.stringify(value2)}`);
+    return value2;
+  });
 }
-function lambdaOf(run) {
-  for (const [key, value] of Object.entries(run.hyperparameters ?? {})) {
-    if (typeof value === "number" && knobOf(key) === "regularization" && !/dropout/i.test(key))
-      return value;
-  }
-  return void 0;
-}
-function summarize(run, settings) {
-  const reference = chooseReference(run, settings.reference);
-  const components = decompose(run, reference.value, settings);
-  const diagnosis = diagnose(components);
-  const warnings = [];
-  if (components.overfit.present) {
-    warnings.push(
-      "Test error is well above validation error: model choices may be tuned to the validation set."
-    );
-  }
-  const lambda = lambdaOf(run);
+function reviewSettings(input) {
   return {
-    name: run.run.name,
-    commit: run.run.commit ?? null,
-    createdAt: run.run.createdAt ?? null,
-    reference: reference.value,
-    referenceSource: reference.source,
-    splits: SPLIT_NAMES.flatMap((s) => splitSummary(run, s, settings.alpha) ?? []),
-    errorLevel: errorLevel(run),
-    components,
-    diagnosis,
-    biasUnknown: reference.value === null,
-    warnings,
-    curves: analyzeCurves(run.curves, {
-      ...lambda === void 0 ? {} : { lambda },
-      kind: run.metric.kind,
-      goal: run.metric.goal
-    })
+    alpha: input.alpha,
+    minEffect: input.minEffect,
+    gapTolerance: input.gapTolerance,
+    failOn: failOnOf(input.failOn)
   };
 }
-function pairedTest(paired, run, alpha) {
-  if (paired.rows === 0) return null;
-  if (paired.kind === "proportion") {
-    const result = mcnemarExact(
-      paired.baselineOnly ?? 0,
-      paired.candidateOnly ?? 0,
-      paired.rows,
-      alpha
-    );
-    return run.metric.goal === "minimize" ? toMetricUnits(result, -1) : result;
-  }
-  return pairedT(
-    { n: paired.rows, mean: paired.meanDiff ?? 0, variance: paired.varDiff ?? 0 },
-    alpha
-  );
-}
-function both(measure) {
-  return { baseline: measure, candidate: measure };
-}
+var NO_BIAS_CHANGE = {
+  unit: "shortfall",
+  estimate: 0,
+  ci: null,
+  p: null,
+  test: "none",
+  call: "flat"
+};
 function buildReview(input) {
-  const { baseline, candidate, settings } = input;
+  const { baseline, candidate } = input;
+  const settings = reviewSettings(input.settings);
   const calls = { alpha: settings.alpha, minEffect: settings.minEffect };
-  const sign = shortfallSign(candidate);
-  const notes = [...input.notes ?? []];
-  const base = summarize(baseline, settings);
-  const cand = summarize(candidate, settings);
-  const pairedSplit = input.paired?.split ?? "validation";
-  const shortfallChanges = /* @__PURE__ */ new Map();
-  for (const split of SPLIT_NAMES) {
-    let result = measureChange(baseline, candidate, both(splitMeasure(split)), settings.alpha);
-    if (result === null) continue;
-    if (input.paired !== void 0 && split === pairedSplit && (result.test === "none" || result.test === "z-binomial")) {
-      const paired2 = pairedTest(input.paired, candidate, settings.alpha);
-      if (paired2 !== null) result = toMetricUnits(paired2, sign);
-    }
-    shortfallChanges.set(split, result);
-  }
-  const validationShortfall = shortfallChanges.get("validation");
+  const reference = input.settings.reference;
+  const summarySettings = { ...settings, ...reference === void 0 ? {} : { reference } };
+  const base = summarize(baseline, summarySettings);
+  const cand = summarize(candidate, summarySettings);
+  const runs = { baseline, candidate };
+  const shortfalls = splitShortfalls(runs, settings.alpha, input.paired);
+  const validationShortfall = shortfalls.get("validation");
   if (validationShortfall === void 0)
     throw new Error("validation split is required by the schema");
-  const validationDelta = toDelta(validationShortfall, calls);
-  const splits = [];
-  for (const [split, result] of shortfallChanges) {
-    const b = base.splits.find((s) => s.split === split);
-    const c = cand.splits.find((s) => s.split === split);
-    if (b === void 0 || c === void 0) continue;
-    splits.push({
-      split,
-      baseline: b.mean,
-      candidate: c.mean,
-      delta: toDelta(toMetricUnits(result, sign), calls)
-    });
-  }
-  const refB = base.reference;
-  const refC = cand.reference;
-  const [biasRefB, biasRefC] = refB !== null && refC !== null ? [refB, refC] : [0, 0];
-  const biasResult = measureChange(
-    baseline,
-    candidate,
-    {
-      baseline: componentMeasures(baseline, biasRefB).bias ?? splitMeasure("train"),
-      candidate: componentMeasures(candidate, biasRefC).bias ?? splitMeasure("train")
-    },
-    settings.alpha
+  const components = componentChanges(
+    runs,
+    { baseline: base.reference, candidate: cand.reference },
+    calls
   );
-  const componentChange = (name) => {
-    const mb = componentMeasures(baseline, refB)[name];
-    const mc = componentMeasures(candidate, refC)[name];
-    if (mb === null || mc === null) return null;
-    if (name === "variance" && baseline.splits.train_dev === void 0 !== (candidate.splits.train_dev === void 0)) {
-      const fallback = {
-        terms: [
-          { split: "validation", weight: 1 },
-          { split: "train", weight: -1 }
-        ],
-        constant: 0
-      };
-      notes.push(
-        "Only one run has a train_dev split: the variance change is measured as validation \u2212 train in both."
-      );
-      const r2 = measureChange(baseline, candidate, both(fallback), settings.alpha);
-      return r2 === null ? null : toDelta(r2, calls);
-    }
-    const r = measureChange(baseline, candidate, { baseline: mb, candidate: mc }, settings.alpha);
-    return r === null ? null : toDelta(r, calls);
+  const movement = movementOf(components.bias?.call ?? "flat", components.variance.call);
+  const validation = {
+    change: validationChangeOf(toShortfallDelta(validationShortfall, calls).call),
+    delta: toMetricDelta(toMetricUnits(validationShortfall, shortfallSign(candidate)), calls)
   };
-  const biasDelta = biasResult === null ? null : toDelta(biasResult, calls);
-  const varianceDelta = componentChange("variance");
-  if (varianceDelta === null)
-    throw new Error("variance needs train and validation, which the schema requires");
-  const movement = movementOf(biasDelta?.call ?? "flat", varianceDelta.call);
-  const validationChange = validationChangeOf(validationDelta.call);
-  const sliceResult = compareSlices(baseline, candidate, validationChange, calls);
-  if (sliceResult.unpaired.length > 0) {
-    notes.push(
-      `${sliceResult.unpaired.length} slice(s) appear in one run only and were not compared: ${sliceResult.unpaired.slice(0, 5).join(", ")}${sliceResult.unpaired.length > 5 ? ", \u2026" : ""}.`
-    );
-  }
-  const hidden = sliceResult.slices.filter((s) => s.hiddenRegression);
-  if (hidden.length > 0) {
-    notes.push(
-      `Validation improved overall, yet ${hidden.length} slice(s) regressed significantly (Holm-adjusted): ${hidden.slice(0, 5).map((s) => s.name).join(", ")}.`
-    );
-  }
-  const noiseUnknown = validationDelta.test === "none" || varianceDelta.test === "none";
-  if (noiseUnknown) {
-    notes.push(
-      settings.minEffect > 0 ? `Run-to-run noise is unknown (one repeat of a continuous metric, no per-example predictions): changes are called on size alone (min-effect ${formatValue(settings.minEffect, candidate.metric.kind)}).` : "Run-to-run noise is unknown (one repeat of a continuous metric, no per-example predictions) and min-effect is 0: no change can be called. Add repeats (seeds), per-example predictions, or set min-effect."
-    );
-  }
-  if (cand.biasUnknown) {
-    notes.push(
-      "Avoidable bias is unknown: there is no reference level for this metric. Its change is still measured from the training error; the diagnosis rests on variance and data mismatch."
-    );
-  }
-  if (input.paired !== void 0 && input.paired.rows === 0) {
-    notes.push("The two predictions files share no id: the paired test was not used.");
-  }
+  const sliceResult = compareSlices(baseline, candidate, validation.change, calls);
+  const noiseUnknown = validation.delta.test === "none" || components.variance.test === "none";
   const changes = diffHyperparameters(baseline.hyperparameters, candidate.hyperparameters);
-  const lambda = lambdaOf(candidate);
-  const { levers, nonLevers } = chooseLevers({
-    kind: candidate.metric.kind,
-    metricName: candidate.metric.name,
+  const { levers, nonLevers: nonLevers2 } = chooseLevers({
+    goal: candidate.metric.goal,
     candidate: cand,
     baseline: base,
     movement,
-    bias: biasDelta ?? { estimate: 0, ci: null, p: null, test: "none", call: "flat" },
-    variance: varianceDelta,
+    bias: components.bias ?? NO_BIAS_CHANGE,
+    variance: components.variance,
     pulled: pulledLevers(changes),
     changes,
-    lambda,
+    regularization: regularizationOf(candidate),
     noiseUnknown
   });
-  const partial = {
-    movement,
-    validation: {
-      change: validationChange,
-      delta: toDelta(toMetricUnits(validationShortfall, sign), calls)
+  const hasGuardrails = baseline.guardrails !== void 0 || candidate.guardrails !== void 0;
+  const guardrails = hasGuardrails ? reviewGuardrails(baseline, candidate, {
+    alpha: settings.alpha,
+    margins: input.settings.guardrailMargins ?? /* @__PURE__ */ new Map()
+  }) : void 0;
+  const cost = baseline.cost !== void 0 || candidate.cost !== void 0 ? reviewCost(baseline, candidate, settings.alpha) : void 0;
+  const gate = applyGate(
+    {
+      movement,
+      validation,
+      slices: sliceResult.slices,
+      candidate: cand,
+      ...guardrails === void 0 ? {} : { guardrails },
+      ...cost === void 0 ? {} : { cost }
     },
-    slices: sliceResult.slices,
-    candidate: cand,
-    settings: {
-      alpha: settings.alpha,
-      minEffect: settings.minEffect,
-      gapTolerance: settings.gapTolerance,
-      failOn: [...settings.failOn]
-    }
-  };
-  const gate = applyGate(partial);
-  const paired = input.paired === void 0 ? null : {
-    rows: input.paired.rows,
-    test: input.paired.kind === "proportion" ? "mcnemar-exact" : "paired-t",
-    ...input.paired.kind === "proportion" ? {
-      discordant: {
-        baselineOnly: input.paired.baselineOnly ?? 0,
-        candidateOnly: input.paired.candidateOnly ?? 0
-      }
-    } : {}
-  };
+    settings.failOn
+  );
   return {
     format: "fitgap-review/1",
     metric: { ...candidate.metric },
-    ...partial,
-    bias: { delta: biasDelta },
-    variance: { delta: varianceDelta },
-    mismatch: { delta: componentChange("mismatch") },
-    overfit: { delta: componentChange("overfit") },
-    splits,
+    settings,
+    movement,
+    validation,
+    bias: { delta: components.bias },
+    variance: { delta: components.variance },
+    mismatch: { delta: components.mismatch },
+    overfit: { delta: components.overfit },
+    splits: splitChanges(shortfalls, runs, { baseline: base, candidate: cand }, calls),
     baseline: base,
+    candidate: cand,
+    slices: sliceResult.slices,
     hyperparameters: changes,
     levers,
-    nonLevers,
+    nonLevers: nonLevers2,
     gate,
-    notes,
-    paired
+    ...guardrails === void 0 ? {} : { guardrails },
+    ...cost === void 0 ? {} : { cost },
+    notes: [
+      ...input.notes ?? [],
+      ...reviewNotes({
+        components,
+        unpaired: sliceResult.unpaired,
+        slices: sliceResult.slices,
+        noiseUnknown,
+        biasUnknown: cand.biasUnknown,
+        paired: input.paired
+      })
+    ],
+    paired: pairedSummary(input.paired)
+  };
+}
+function reviewNotes(facts) {
+  const notes = [];
+  if (facts.components.varianceFallback) notes.push({ code: "train-dev-in-one-run" });
+  if (facts.unpaired.length > 0) {
+    notes.push({
+      code: "unpaired-slices",
+      count: facts.unpaired.length,
+      names: facts.unpaired.slice(0, NOTE_NAMES)
+    });
+  }
+  const hidden = facts.slices.filter((s) => s.hiddenRegression);
+  if (hidden.length > 0) {
+    notes.push({
+      code: "hidden-regressions",
+      count: hidden.length,
+      names: hidden.slice(0, NOTE_NAMES).map((s) => s.name)
+    });
+  }
+  if (facts.noiseUnknown) notes.push({ code: "noise-unknown" });
+  if (facts.biasUnknown) notes.push({ code: "bias-unknown" });
+  if (facts.paired !== void 0 && facts.paired.rows === 0)
+    notes.push({ code: "predictions-share-no-id" });
+  return notes;
+}
+function pairedSummary(paired) {
+  if (paired === void 0) return null;
+  if (paired.kind === "continuous") return { rows: paired.rows, test: "paired-t" };
+  return {
+    rows: paired.rows,
+    test: "mcnemar-exact",
+    discordant: {
+      baselineOnly: paired.baselineOnly ?? 0,
+      candidateOnly: paired.candidateOnly ?? 0
+    }
   };
 }
 
@@ -22696,9 +23372,9 @@ var HashLog = class {
 };
 function parseValue(raw, kind, file, line) {
   const column = kind === "proportion" ? "correct" : "loss";
-  const text = raw.trim();
-  const value = kind === "proportion" ? text === "0" || text === "1" ? Number(text) : Number.NaN : parseDecimal(text) ?? Number.NaN;
-  if (!Number.isFinite(value) || Math.abs(value) > MAX_MAGNITUDE) {
+  const text2 = raw.trim();
+  const value2 = kind === "proportion" ? text2 === "0" || text2 === "1" ? Number(text2) : Number.NaN : parseDecimal(text2) ?? Number.NaN;
+  if (!Number.isFinite(value2) || Math.abs(value2) > MAX_MAGNITUDE) {
     throw new InputError([
       {
         file,
@@ -22708,7 +23384,7 @@ function parseValue(raw, kind, file, line) {
       }
     ]);
   }
-  return value;
+  return value2;
 }
 async function* readRows(source, kind, hashes) {
   const file = source.file;
@@ -22718,10 +23394,10 @@ async function* readRows(source, kind, hashes) {
   let line = 0;
   let rows = 0;
   try {
-    for await (const text of lines) {
+    for await (const text2 of lines) {
       line++;
       if (line === 1) {
-        const header = text.replace(/^\uFEFF/, "").trim();
+        const header = text2.replace(/^\uFEFF/, "").trim();
         if (header !== HEADER[kind]) {
           throw new InputError([
             {
@@ -22734,26 +23410,26 @@ async function* readRows(source, kind, hashes) {
         }
         continue;
       }
-      if (text.trim() === "") continue;
-      const comma = text.indexOf(",");
-      if (comma < 0 || text.indexOf(",", comma + 1) >= 0) {
+      if (text2.trim() === "") continue;
+      const comma = text2.indexOf(",");
+      if (comma < 0 || text2.indexOf(",", comma + 1) >= 0) {
         throw new InputError([
           {
             file,
             pointer: `line ${line}`,
             expected: "must have exactly two fields, id and value",
-            got: quote(text)
+            got: quote(text2)
           }
         ]);
       }
-      const id = text.slice(0, comma).trim();
+      const id = text2.slice(0, comma).trim();
       if (id === "")
         throw new InputError([
           { file, pointer: `line ${line}`, expected: "must have a non-empty id" }
         ]);
       hashes?.push(hashId(id));
       rows++;
-      yield { id, value: parseValue(text.slice(comma + 1), kind, file, line), line };
+      yield { id, value: parseValue(text2.slice(comma + 1), kind, file, line), line };
     }
   } finally {
     lines.close();
@@ -22831,17 +23507,17 @@ async function pairPredictions(baseline, candidate, kind) {
       pair(a.value.value, b.value.value);
     } else {
       if (!a.done) {
-        const partner = waitingCand.get(a.value.id);
-        if (partner !== void 0) {
+        const partner2 = waitingCand.get(a.value.id);
+        if (partner2 !== void 0) {
           waitingCand.delete(a.value.id);
-          pair(a.value.value, partner);
+          pair(a.value.value, partner2);
         } else waitingBase.set(a.value.id, a.value.value);
       }
       if (!b.done) {
-        const partner = waitingBase.get(b.value.id);
-        if (partner !== void 0) {
+        const partner2 = waitingBase.get(b.value.id);
+        if (partner2 !== void 0) {
           waitingBase.delete(b.value.id);
-          pair(partner, b.value.value);
+          pair(partner2, b.value.value);
         } else waitingCand.set(b.value.id, b.value.value);
       }
     }
@@ -22878,14 +23554,14 @@ function resolveLimits(config, given = {}) {
 function referenceIssues(config, options, configFile, kind) {
   if (kind !== "proportion") return [];
   const fromFlag = options.overrides?.reference;
-  const value = fromFlag ?? config.reference;
-  if (value === void 0 || value >= 0 && value <= 1) return [];
+  const value2 = fromFlag ?? config.reference;
+  if (value2 === void 0 || value2 >= 0 && value2 <= 1) return [];
   return [
     {
       file: fromFlag !== void 0 ? options.overrideLabel?.("reference") ?? "--reference" : configFile,
       pointer: fromFlag !== void 0 ? "" : "/reference",
       expected: "must be within [0, 1] for a proportion metric",
-      got: quote(value),
+      got: quote(value2),
       hint: "Write the reference as a fraction (0.02, not 2)."
     }
   ];
@@ -22898,7 +23574,12 @@ function resolveSettings(config, overrides = {}) {
     minEffect: overrides.minEffect ?? config["min-effect"] ?? DEFAULT_SETTINGS.minEffect,
     gapTolerance: overrides.gapTolerance ?? config["gap-tolerance"] ?? DEFAULT_SETTINGS.gapTolerance,
     failOn: overrides.failOn ?? config["fail-on"] ?? [...DEFAULT_SETTINGS.failOn],
-    ...reference === void 0 ? {} : { reference }
+    ...reference === void 0 ? {} : { reference },
+    ...config.guardrails === void 0 ? {} : {
+      guardrailMargins: new Map(
+        Object.entries(config.guardrails).map(([name, g]) => [name, g.margin])
+      )
+    }
   };
 }
 function sameMetric(baseline, candidate) {
@@ -22924,12 +23605,12 @@ async function pairIfBoth(baseline, candidate) {
   };
   if (baseline.predictions === null || candidate.predictions === null || bp === void 0 || cp === void 0) {
     return unpaired(
-      bp !== cp && (bp === void 0 || cp === void 0) ? ["Only one run ships per-example predictions: no paired test."] : []
+      bp !== cp && (bp === void 0 || cp === void 0) ? [{ code: "predictions-in-one-run" }] : []
     );
   }
   if (bp.split !== cp.split) {
     return unpaired([
-      `The predictions are for different splits (${bp.split} vs ${cp.split}): no paired test.`
+      { code: "predictions-split-mismatch", baseline: bp.split, candidate: cp.split }
     ]);
   }
   const result = await pairPredictions(baseline.predictions, candidate.predictions, kind);
@@ -22947,9 +23628,12 @@ async function pairIfBoth(baseline, candidate) {
     ]);
   }
   if (unmatched.baseline + unmatched.candidate > 0) {
-    notes.push(
-      `Predictions paired by id: ${result.rows} rows in both; ${unmatched.baseline} baseline and ${unmatched.candidate} candidate rows had no partner and were left out of the paired test.`
-    );
+    notes.push({
+      code: "predictions-unmatched",
+      rows: result.rows,
+      baseline: unmatched.baseline,
+      candidate: unmatched.candidate
+    });
   }
   return { paired: { ...paired, split: bp.split }, notes };
 }
@@ -23057,12 +23741,12 @@ function parseFlags(argv, options, command) {
     );
   }
 }
-function parseFormat(value, command) {
-  if (value === void 0) return "text";
-  if (typeof value === "string" && FORMATS.includes(value))
-    return value;
+function parseFormat(value2, command) {
+  if (value2 === void 0) return "text";
+  if (typeof value2 === "string" && FORMATS.includes(value2))
+    return value2;
   throw new UsageError(
-    `fitgap ${command}: --format must be one of ${FORMATS.join(", ")} (got ${JSON.stringify(value)}).`
+    `fitgap ${command}: --format must be one of ${FORMATS.join(", ")} (got ${JSON.stringify(value2)}).`
   );
 }
 var SETTING_FLAGS = {
@@ -23124,12 +23808,14 @@ Usage:
   fitgap review --baseline FILE --candidate FILE [options]
   fitgap validate FILE...
   fitgap demo [NAME]
+  fitgap curves import --from FORMAT PATH... --out FILE
   fitgap --version
 
 Commands:
   review     compare two run artifacts and print the review
   validate   check run artifacts (.json) or config files (.yml) and exit
   demo       review the bundled demo scenario
+  curves     import a training log (CSV, TensorBoard, MLflow, evals_result) as a curve
 
 Run 'fitgap COMMAND --help' for the options of a command.
 
@@ -23179,8 +23865,8 @@ order will be late. Without NAME, the first candidate is reviewed and the others
 `;
 
 // node_modules/markdown-table/index.js
-function defaultStringLength(value) {
-  return value.length;
+function defaultStringLength(value2) {
+  return value2.length;
 }
 function markdownTable(table2, options) {
   const settings = options || {};
@@ -23313,11 +23999,11 @@ function markdownTable(table2, options) {
   }
   return lines.join("\n");
 }
-function serialize(value) {
-  return value === null || value === void 0 ? "" : String(value);
+function serialize(value2) {
+  return value2 === null || value2 === void 0 ? "" : String(value2);
 }
-function toAlignment(value) {
-  const code = typeof value === "string" ? value.codePointAt(0) : 0;
+function toAlignment(value2) {
+  const code = typeof value2 === "string" ? value2.codePointAt(0) : 0;
   return code === 67 || code === 99 ? 99 : code === 76 || code === 108 ? 108 : code === 82 || code === 114 ? 114 : 0;
 }
 
@@ -23326,17 +24012,17 @@ var DEFAULT_MAX_NAME = 80;
 var ZWJ = "\u200D";
 var REMOVED = /[\p{Cc}\p{Cf}\p{Cs}]/gu;
 var BREAKS = /[\t\n\v\f\r\u0085\u2028\u2029]/g;
-function plainText(text, maxChars = DEFAULT_MAX_NAME) {
-  const cleaned = text.replace(BREAKS, " ").replace(REMOVED, "").replace(/\s+/g, " ").trim();
+function plainText(text2, maxChars = DEFAULT_MAX_NAME) {
+  const cleaned = text2.replace(BREAKS, " ").replace(REMOVED, "").replace(/\s+/g, " ").trim();
   return truncate(cleaned, maxChars);
 }
-function truncate(text, maxChars) {
-  const points = Array.from(text);
-  if (points.length <= maxChars) return text;
+function truncate(text2, maxChars) {
+  const points = Array.from(text2);
+  if (points.length <= maxChars) return text2;
   return `${points.slice(0, Math.max(0, maxChars - 1)).join("").trimEnd()}\u2026`;
 }
-function escapeInline(text, maxChars = DEFAULT_MAX_NAME) {
-  const plain = plainText(text, maxChars);
+function escapeInline(text2, maxChars = DEFAULT_MAX_NAME) {
+  const plain = plainText(text2, maxChars);
   let out = "";
   for (const ch of plain) {
     out += escapeChar(ch);
@@ -23360,70 +24046,228 @@ function escapeChar(ch) {
   }
 }
 var MARKDOWN_PUNCTUATION = /* @__PURE__ */ new Set(["\\", "`", "*", "_", "[", "]", "|", "~", "$"]);
-function mermaidLabel(text, maxChars = 60) {
-  const kept = plainText(text, Number.MAX_SAFE_INTEGER).replace(/[^\p{L}\p{N} .,\-+()/=]/gu, " ").replace(/ {2,}/g, " ").trim();
+function mermaidLabel(text2, maxChars = 60) {
+  const kept = plainText(text2, Number.MAX_SAFE_INTEGER).replace(/[^\p{L}\p{N} .,\-+()/=]/gu, " ").replace(/ {2,}/g, " ").trim();
   return truncate(kept, maxChars);
 }
-function terminalText(text, maxChars = DEFAULT_MAX_NAME) {
-  return plainText(text, maxChars);
+function terminalText(text2, maxChars = DEFAULT_MAX_NAME) {
+  return plainText(text2, maxChars);
 }
-function displayValue(value) {
-  if (value === void 0) return "(absent)";
-  if (typeof value === "string") return value;
-  if (typeof value === "number" || typeof value === "boolean" || value === null) {
-    return String(value);
+function displayValue(value2) {
+  if (value2 === void 0) return "(absent)";
+  if (typeof value2 === "string") return value2;
+  if (typeof value2 === "number" || typeof value2 === "boolean" || value2 === null) {
+    return String(value2);
   }
   try {
-    return JSON.stringify(value) ?? String(value);
+    return JSON.stringify(value2) ?? String(value2);
   } catch {
-    return String(value);
+    return String(value2);
   }
 }
 
 // src/report/format.ts
+var MINUS = "\u2212";
+var SIGNIFICANT = 4;
+var MAX_DECIMALS = 6;
 function numberFormatFor(review) {
+  return formatForValues(
+    review.metric.kind,
+    review.splits.flatMap((s) => [s.baseline, s.candidate])
+  );
+}
+function formatForValues(kind, values) {
   let largest = 0;
-  for (const change of review.splits) {
-    largest = Math.max(largest, Math.abs(change.baseline), Math.abs(change.candidate));
-  }
-  if (largest === 0 || !Number.isFinite(largest)) return { decimals: 4 };
-  const decimals = 3 - Math.floor(Math.log10(largest));
-  return { decimals: Math.min(6, Math.max(0, decimals)) };
+  for (const v of values) largest = Math.max(largest, Math.abs(v));
+  const decimals = largest === 0 || !Number.isFinite(largest) ? SIGNIFICANT : Math.min(MAX_DECIMALS, Math.max(0, SIGNIFICANT - 1 - Math.floor(Math.log10(largest))));
+  return { kind, decimals };
 }
-function num(value, format) {
-  const text = value.toFixed(format.decimals);
-  return /^-0(\.0+)?$/.test(text) ? text.slice(1) : text;
+function digits(v, f) {
+  const proportion = f.kind === "proportion";
+  const text2 = (proportion ? v * 100 : v).toFixed(
+    proportion ? Math.max(0, f.decimals - 2) : f.decimals
+  );
+  if (/^-0(\.0+)?$/.test(text2)) return text2.slice(1);
+  return text2.replace("-", MINUS);
 }
-function signed(value, format) {
-  const text = num(Math.abs(value), format);
-  if (/^0(\.0+)?$/.test(text)) return text;
-  return value > 0 ? `+${text}` : `\u2212${text}`;
+function isZero(text2) {
+  return /^0(\.0+)?$/.test(text2);
 }
-function interval(ci, format) {
+function value(v, f) {
+  return f.kind === "proportion" ? `${digits(v, f)}%` : digits(v, f);
+}
+function unit(f) {
+  return f.kind === "proportion" ? " pts" : "";
+}
+function signedDigits(v, f) {
+  const text2 = digits(Math.abs(v), f);
+  if (isZero(text2)) return text2;
+  return v > 0 ? `+${text2}` : `${MINUS}${text2}`;
+}
+function change(v, f) {
+  return `${signedDigits(v, f)}${unit(f)}`;
+}
+function amount(v, f) {
+  return `${digits(Math.abs(v), f)}${unit(f)}`;
+}
+function difference(v, f) {
+  return `${digits(v, f)}${unit(f)}`;
+}
+function changeInterval(ci, f) {
   if (ci === null) return "n/a";
-  return `[${signed(ci[0], format)}, ${signed(ci[1], format)}]`;
+  return `[${signedDigits(ci[0], f)}, ${signedDigits(ci[1], f)}]${unit(f)}`;
 }
-function pValue(p) {
+function valueRange(ci, f) {
+  return `${value(ci[0], f)} to ${value(ci[1], f)}`;
+}
+function unitLine(f, values) {
+  if (f.kind !== "proportion") return null;
+  return values === "values" ? "Values in percent; \u0394 and intervals in percentage points." : "Components, \u0394 and intervals in percentage points.";
+}
+function valueCell(v, f) {
+  return digits(v, f);
+}
+function changeCell(v, f) {
+  return signedDigits(v, f);
+}
+function intervalCell(ci, f) {
+  if (ci === null) return "n/a";
+  return `[${signedDigits(ci[0], f)}, ${signedDigits(ci[1], f)}]`;
+}
+var SMALLEST_P = 1e-3;
+function pCell(p) {
+  if (p === null) return "n/a";
+  return p < SMALLEST_P ? `< ${SMALLEST_P}` : p.toFixed(3);
+}
+function pText(p) {
   if (p === null) return "p n/a";
-  if (p < 1e-3) return "p < 0.001";
-  return `p = ${p.toFixed(3)}`;
+  return p < SMALLEST_P ? `p < ${SMALLEST_P}` : `p = ${p.toFixed(3)}`;
 }
 function count(n) {
   return Math.round(n).toString().replace(/\B(?=(\d{3})+(?!\d))/g, ",");
 }
-function short(value) {
-  if (value === 0) return "0";
-  const abs = Math.abs(value);
-  if (abs >= 1e6 || abs < 1e-4) return value.toExponential(2);
-  return String(Number(value.toPrecision(4)));
+function short(v) {
+  if (v === 0) return "0";
+  const abs = Math.abs(v);
+  const text2 = abs >= 1e6 || abs < 1e-4 ? v.toExponential(2) : String(Number(v.toPrecision(4)));
+  return text2.replace(/-/g, MINUS);
 }
-function chartNumber(value, decimals) {
-  const text = value.toFixed(decimals);
-  return /^-0(\.0+)?$/.test(text) ? text.slice(1) : text;
+function fixed(v, decimals) {
+  const text2 = v.toFixed(decimals);
+  return /^-0(\.0+)?$/.test(text2) ? text2.slice(1) : text2.replace("-", MINUS);
+}
+function chartNumber(v, decimals) {
+  const text2 = v.toFixed(decimals);
+  return /^-0(\.0+)?$/.test(text2) ? text2.slice(1) : text2;
+}
+
+// src/report/guardrails.ts
+var COST_WORDS = /* @__PURE__ */ new Map([
+  ["trainSeconds", { noun: "training time", unit: " s" }],
+  ["inferenceMs", { noun: "inference latency", unit: " ms" }],
+  ["parameters", { noun: "parameters", unit: "" }],
+  ["memoryMb", { noun: "memory", unit: " MB" }]
+]);
+var NON_INFERIORITY_WORD = /* @__PURE__ */ new Map([
+  ["non-inferior", "within margin"],
+  ["inferior", "beyond margin"],
+  ["undetermined", "cannot tell, margin"]
+]);
+var CHANGE_WORD = /* @__PURE__ */ new Map([
+  ["better", "better"],
+  ["worse", "worse"],
+  ["flat", "no change beyond noise"],
+  ["undetermined", "noise unknown"]
+]);
+var COST_CALL_WORD = /* @__PURE__ */ new Map([
+  ["up", "up"],
+  ["down", "down"],
+  ["flat", "no change beyond noise"],
+  ["undetermined", "noise unknown"]
+]);
+var word = (table2, code, esc) => table2.get(code) ?? esc(code, 40);
+function formatOf(g) {
+  const values = [g.baseline, g.candidate].filter((v) => v !== null);
+  return formatForValues(g.kind, values);
+}
+function withUnit(text2, g, esc) {
+  return g.unit === null || g.kind === "proportion" ? text2 : `${text2} ${esc(g.unit, 20)}`;
+}
+function guardrailVerdict(g, esc, margin) {
+  if (g.problems.includes("missing-in-baseline")) return "not in the baseline";
+  if (g.problems.includes("missing-in-candidate")) return "not in the candidate";
+  if (g.problems.includes("metric-differs")) return "metric differs between the runs";
+  const changeWord = g.change === null ? "" : word(CHANGE_WORD, g.change.call, esc);
+  if (g.nonInferiority === null) return `${changeWord}; no margin, not gated`;
+  return `${word(NON_INFERIORITY_WORD, g.nonInferiority, esc)} ${margin}`;
+}
+function ratio(v) {
+  return `\xD7${fixed(v, v >= 10 ? 1 : 2)}`;
+}
+function costCell(v, field) {
+  return `${short(v)}${COST_WORDS.get(field)?.unit ?? ""}`;
+}
+function guardrailsTable(review, esc, level, compact = false) {
+  const rows = [];
+  for (const g of review.guardrails ?? []) {
+    const f = formatOf(g);
+    const margin = g.margin === null ? "\u2014" : withUnit(amount(g.margin, f), g, esc);
+    rows.push([
+      esc(g.name, 60),
+      g.baseline === null ? "\u2014" : withUnit(value(g.baseline, f), g, esc),
+      g.candidate === null ? "\u2014" : withUnit(value(g.candidate, f), g, esc),
+      g.change === null ? "\u2014" : compact ? change(g.change.estimate, f) : `${change(g.change.estimate, f)} ${changeInterval(g.change.ci, f)}`,
+      guardrailVerdict(g, esc, margin)
+    ]);
+  }
+  for (const [field, words2] of COST_WORDS) {
+    const c = review.cost?.[field];
+    if (c === void 0) continue;
+    const interval = c.ci === null ? "" : ` [${fixed(c.ci[0], 2)}, ${fixed(c.ci[1], 2)}]`;
+    rows.push([
+      words2.noun,
+      costCell(c.baseline, field),
+      costCell(c.candidate, field),
+      `${ratio(c.ratio)}${interval}`,
+      word(COST_CALL_WORD, c.call, esc)
+    ]);
+  }
+  if (rows.length === 0) return null;
+  return {
+    header: [
+      compact ? "Guardrail" : "Guardrail or cost",
+      "Baseline",
+      "Candidate",
+      compact ? "\u0394" : `\u0394 [${level}% interval]`,
+      "Verdict"
+    ],
+    align: ["l", "r", "r", "r", "l"],
+    rows,
+    units: null
+  };
+}
+function tradeOffPhrase(review, esc) {
+  const moved = [...COST_WORDS].filter(([field]) => {
+    const call = review.cost?.[field]?.call;
+    return call === "up" || call === "down";
+  });
+  if (moved.length === 0) return null;
+  const f = numberFormatFor(review);
+  const costs = moved.map(([field, words2]) => `${ratio(review.cost?.[field]?.ratio ?? 1)} ${words2.noun}`).join(" and ");
+  return `${change(review.validation.delta.estimate, f)} ${esc(review.metric.name, 60)} for ${costs}`;
+}
+function guardrailNames(review, call) {
+  return (review.guardrails ?? []).filter((g) => g.nonInferiority === call).map((g) => g.name);
 }
 
 // src/report/words.ts
-var MOVEMENT_TITLE = {
+function words(entries) {
+  return new Map(Object.entries(entries));
+}
+function say(table2, code, esc) {
+  return table2.get(code) ?? esc(String(code), 60);
+}
+var MOVEMENT_TITLE = words({
   "better-on-both": "less bias and less variance",
   "away-from-underfitting": "away from underfitting",
   "toward-overfitting": "toward overfitting",
@@ -23431,8 +24275,8 @@ var MOVEMENT_TITLE = {
   "no-significant-change": "no change beyond noise",
   "toward-underfitting": "toward underfitting",
   "worse-on-both": "more bias and more variance"
-};
-var MOVEMENT_SENTENCE = {
+});
+var MOVEMENT_SENTENCE = words({
   "better-on-both": "The change lowered both avoidable bias and variance",
   "away-from-underfitting": "The change moved the model away from underfitting",
   "toward-overfitting": "The change moved the model toward overfitting",
@@ -23440,38 +24284,44 @@ var MOVEMENT_SENTENCE = {
   "no-significant-change": "The change did not move avoidable bias or variance beyond run-to-run noise",
   "toward-underfitting": "The change moved the model toward underfitting",
   "worse-on-both": "The change raised both avoidable bias and variance"
-};
-var VALIDATION_WORD = {
+});
+var VALIDATION_WORD = words({
   better: "better",
   worse: "worse",
   flat: "unchanged within noise"
-};
-var DIAGNOSIS_WORD = {
+});
+var DIAGNOSIS_WORD = words({
   "good-fit": "good fit",
   "high-bias": "high bias (underfitting)",
   "high-variance": "high variance (overfitting)",
   "data-mismatch": "data mismatch",
   "high-bias-and-variance": "high bias and high variance"
-};
-var COMPONENT_WORD = {
+});
+var COMPONENT_TITLE = words({
   bias: "Avoidable bias",
   variance: "Variance",
   mismatch: "Data mismatch",
   overfit: "Validation overfit"
-};
+});
+var COMPONENT_WORD = words({
+  bias: "avoidable bias",
+  variance: "variance",
+  mismatch: "data mismatch",
+  overfit: "validation overfit"
+});
 var COMPONENT_ORDER = [
   "bias",
   "variance",
   "mismatch",
   "overfit"
 ];
-var SPLIT_WORD = {
+var SPLIT_WORD = words({
   train: "train",
   train_dev: "train-dev",
   validation: "validation",
   test: "test"
-};
-var LEVER_TITLE = {
+});
+var LEVER_TITLE = words({
   "more-data": "Add training data",
   "fewer-features": "Use fewer features",
   "stronger-regularization": "Strengthen regularization",
@@ -23486,29 +24336,35 @@ var LEVER_TITLE = {
   "bigger-validation-set": "Use a bigger validation set",
   "add-repeats": "Repeat each run with several seeds",
   "supply-reference": "Supply a reference error level"
-};
-var TEST_WORD = {
+});
+var TEST_WORD = words({
   "welch-t": "Welch's t-test",
   "z-binomial": "binomial z-test",
   "mcnemar-exact": "McNemar's exact test",
   "paired-t": "paired t-test",
   none: "no test"
-};
-var TEST_WHY = {
+});
+var TEST_WHY = words({
   "welch-t": "Welch's t-test on per-repeat values: each run has two or more repeats (seeds), and their spreads may differ.",
   "z-binomial": "normal approximation with binomial variances: one repeat of a proportion metric measured on a known number of examples.",
   "mcnemar-exact": "McNemar's exact test: both runs scored the same examples, so only the examples on which they disagree carry information.",
   "paired-t": "paired t-test on per-example loss differences: both runs scored the same examples with a continuous loss.",
   none: "no test: with one repeat of a continuous metric and no paired predictions, run-to-run noise is unknown, so only min-effect decides."
-};
+});
+var REFERENCE_SOURCE = words({
+  artifact: "from the artifact",
+  config: "from the config",
+  default: "the default for a minimized proportion",
+  unknown: "source unknown"
+});
 function reading(call, review) {
   if (call === "flat") return "flat";
   const up = call === "up";
   return up === (review.metric.goal === "maximize") ? "better" : "worse";
 }
-function componentReading(call) {
-  if (call === "up") return "up (worse)";
-  if (call === "down") return "down (better)";
+function componentReading(call, compact) {
+  if (call === "up") return compact ? "worse" : "up (worse)";
+  if (call === "down") return compact ? "better" : "down (better)";
   return "flat";
 }
 function levelPercent(review) {
@@ -23516,8 +24372,119 @@ function levelPercent(review) {
 }
 var CAUTION = "This verdict is advice for a human reviewer, not a proof: it rests on the numbers the two runs recorded and on the tests named in the method notes.";
 
+// src/report/gate.ts
+var OUTCOME_SENTENCE = /* @__PURE__ */ new Map([
+  ["worse-validation", "validation got significantly worse"],
+  ["toward-overfitting", "the change moved toward overfitting"],
+  ["toward-underfitting", "the change moved toward underfitting"],
+  ["worse-on-both", "bias and variance both got worse"],
+  ["high-bias", "the candidate has high bias"],
+  ["high-variance", "the candidate has high variance"],
+  ["data-mismatch", "the candidate shows data mismatch"],
+  [
+    "validation-overfit",
+    "the candidate overfits the validation set (test error well above validation)"
+  ]
+]);
+function reasonSentence(reason, review, esc) {
+  if (reason.outcome === "any-movement")
+    return `the model moved (${say(MOVEMENT_TITLE, review.movement, esc)})`;
+  if (reason.outcome === "slice-regression") {
+    const n = reason.slices ?? 0;
+    return `${count(n)} ${n === 1 ? "slice" : "slices"} regressed significantly`;
+  }
+  if (reason.outcome === "guardrail-regression" || reason.outcome === "guardrail-undetermined") {
+    const names2 = (reason.guardrails ?? []).map((n) => esc(n, 60)).join(", ");
+    return reason.outcome === "guardrail-regression" ? `guardrail worse beyond its margin (${names2})` : `cannot tell whether a guardrail stays within its margin (${names2})`;
+  }
+  if (reason.ratio !== void 0) return `the cost ratio is \xD7${fixed(reason.ratio, 2)}`;
+  return OUTCOME_SENTENCE.get(reason.outcome) ?? "fired";
+}
+function gateReasonLines(review, esc) {
+  return review.gate.reasons.map(
+    (reason) => `${esc(reason.outcome, 60)}: ${reasonSentence(reason, review, esc)}`
+  );
+}
+function gateSentence(review, esc) {
+  const gate = review.gate;
+  if (!gate.pass) return `${gateReasonLines(review, esc).join("; ")}.`;
+  if (gate.failOn.length === 0) return "no fail-on policy is set.";
+  return `none of fail-on (${gate.failOn.map((p) => esc(p, 60)).join(", ")}) applies.`;
+}
+
+// src/report/levers.ts
+function leverText(lever, review, f, esc) {
+  const ctx = { review, f, esc };
+  const sentences = lever.evidence.flatMap((e) => evidenceSentence(e, lever.id, ctx) ?? []);
+  if (lever.suggestion !== void 0) sentences.push(suggestionSentence(lever.suggestion, ctx));
+  return { title: say(LEVER_TITLE, lever.id, esc), sentences };
+}
+function fromTo(e) {
+  return `${short(e.from)} \u2192 ${short(e.to)}`;
+}
+function evidenceSentence(e, id, ctx) {
+  const { f, esc, review } = ctx;
+  const metric = esc(review.metric.name, 60);
+  switch (e.kind) {
+    case "diagnosis":
+      if (e.component === "mismatch")
+        return `Validation error exceeds train-dev error by ${amount(e.value, f)}: the training data does not look like the validation data; collect or synthesise training data that resembles it.`;
+      if (e.component === "overfit")
+        return `Test error exceeds validation error by ${amount(e.value, f)}: model choices may be tuned to the validation set; enlarge or refresh it.`;
+      return `The candidate has high ${say(COMPONENT_WORD, e.component, esc)}: ${amount(e.value, f)} against a validation error of ${value(e.errorLevel, f)}.`;
+    case "pr-change":
+      return `This PR ${e.direction === "raised" ? "raised" : "lowered"} ${esc(e.hyperparameter, 60)} ${fromTo(e)}.`;
+    case "component-change": {
+      const word2 = e.delta.call === "up" ? "rose" : e.delta.call === "down" ? "fell" : "held steady";
+      const toward = e.delta.call !== "up" ? "" : e.component === "bias" ? ": the model moved toward underfitting" : ": the model moved toward overfitting";
+      return `${say(COMPONENT_TITLE, e.component, esc)} ${word2} (${change(e.delta.estimate, f)}, ${pText(e.delta.p)})${toward}.`;
+    }
+    case "already-pulled":
+      return `This PR already ${e.direction === "raised" ? "raised" : "lowered"} ${esc(e.hyperparameter, 60)} (${fromTo(e)}): judge its effect before pulling further.`;
+    case "sweep-minimum":
+      return sweepSentence(e, ctx);
+    case "learning-curve": {
+      const times = e.fromX > 0 ? ` (${short(e.atX / e.fromX)}\xD7 the largest on the curve)` : "";
+      return `At ${count(e.atX)} training examples${times} the power-law fit (R\xB2 ${fixed(e.r2, 2)}) projects validation ${metric} ${value(e.current, f)} \u2192 ${value(e.projected, f)} (${valueRange(e.ci, f)}).`;
+    }
+    case "gap-trend":
+      return e.trend === "flat" ? "The train/validation gap is flat at the right end of the learning curve: more data will help little." : "The train/validation gap is still closing at the right end of the learning curve.";
+    case "epoch-minimum":
+      return `Validation was best at epoch ${short(e.epoch)} of ${short(e.of)}; stopping there saves ${amount(e.saves, f)}${e.gl === null ? "" : ` (generalization loss ${fixed(e.gl, 1)}%)`}.`;
+    case "still-improving":
+      return `Train and validation ${metric} were both still improving at epoch ${short(e.epoch)}.`;
+    case "epoch-curve-silent":
+      if (!e.curve) return "No epoch curve to confirm it.";
+      return id === "train-longer" ? "The epoch curve does not show both errors still falling at the end." : "The epoch curve does not show training past the validation minimum.";
+    case "reference-missing":
+      return "Bias is unknown without a reference level: add `reference` (human-level error, a prior system, or an estimated Bayes error) to the artifacts or the config.";
+    case "noise-unknown":
+      return "Run-to-run noise is unknown: train with 2 or more seeds (or ship per-example predictions) so changes can be tested.";
+    default:
+      return null;
+  }
+}
+function sweepSentence(e, ctx) {
+  const { f, esc } = ctx;
+  const name = e.hyperparameter === null ? "\u03BB" : esc(e.hyperparameter, 60);
+  const at = `${name} \u2248 ${short(e.bestX)}`;
+  const uses = e.current === null ? "" : `; the candidate uses ${short(e.current)}`;
+  const edge = e.atEdge === null ? "" : ` The minimum is at the ${e.atEdge === "low" ? "low" : "high"} end of the sweep: extend it.`;
+  if (e.supports === true)
+    return `The regularization sweep has its lowest validation (${value(e.bestValidation, f)}) at ${at}${uses}.${edge}`;
+  if (e.supports === false && e.side === "at")
+    return `The candidate's strength is already at the sweep's validation minimum (${at}).${edge}`;
+  if (e.supports === false)
+    return `The sweep's validation minimum (${at}) lies on the other side of the candidate's strength.${edge}`;
+  return `The regularization sweep has its lowest validation (${value(e.bestValidation, f)}) at ${at}.${edge}`;
+}
+function suggestionSentence(s, ctx) {
+  const basis = s.basis === "between-old-and-new" ? ", between the old and new values" : s.basis === "sweep-minimum" ? ", the sweep's minimum" : ", one grid step beyond the end of the sweep";
+  return `Try ${ctx.esc(s.hyperparameter, 60)} \u2248 ${short(s.value)}${basis}.`;
+}
+
 // src/report/tables.ts
-function splitsTable(review) {
+function splitsTable(review, esc) {
   const f = numberFormatFor(review);
   return {
     header: [
@@ -23530,23 +24497,24 @@ function splitsTable(review) {
       "Reading"
     ],
     align: ["l", "r", "r", "r", "r", "r", "l"],
+    units: unitLine(f, "values"),
     rows: review.splits.map((s) => [
-      SPLIT_WORD[s.split],
-      num(s.baseline, f),
-      num(s.candidate, f),
-      signed(s.delta.estimate, f),
-      interval(s.delta.ci, f),
-      pValue(s.delta.p).replace(/^p /, "").replace(/^= /, ""),
+      say(SPLIT_WORD, s.split, esc),
+      valueCell(s.baseline, f),
+      valueCell(s.candidate, f),
+      changeCell(s.delta.estimate, f),
+      intervalCell(s.delta.ci, f),
+      pCell(s.delta.p),
       reading(s.delta.call, review)
     ])
   };
 }
-function decompositionTable(review, compact = false) {
+function decompositionTable(review, esc, compact = false) {
   const f = numberFormatFor(review);
   const cell = (run, name) => {
     const c = review[run].components[name];
     if (c.value === null) return "n/a";
-    return `${num(c.value, f)}${c.present ? compact ? "*" : " (present)" : ""}`;
+    return `${valueCell(c.value, f)}${c.present ? compact ? "*" : " (present)" : ""}`;
   };
   const deltas = {
     bias: review.bias.delta,
@@ -23556,71 +24524,49 @@ function decompositionTable(review, compact = false) {
   };
   const rows = COMPONENT_ORDER.map((name) => {
     const d = deltas[name];
+    const row = [say(COMPONENT_TITLE, name, esc), cell("baseline", name), cell("candidate", name)];
+    if (d === null) return [...row, "n/a", "n/a", ...compact ? [] : ["n/a"], "n/a"];
     return [
-      COMPONENT_WORD[name],
-      cell("baseline", name),
-      cell("candidate", name),
-      d === null ? "n/a" : signed(d.estimate, f),
-      d === null ? "n/a" : interval(d.ci, f),
-      d === null ? "n/a" : pValue(d.p).replace(/^p /, "").replace(/^= /, ""),
-      d === null ? "n/a" : componentReading(d.call)
+      ...row,
+      changeCell(d.estimate, f),
+      intervalCell(d.ci, f),
+      ...compact ? [] : [pCell(d.p)],
+      componentReading(d.call, compact)
     ];
   });
+  const units = unitLine(f, "differences");
+  const header = ["Component", "Baseline", "Candidate", "\u0394", `${levelPercent(review)}% interval`];
+  if (compact) {
+    return { header: [...header, "Call"], align: ["l", "r", "r", "r", "r", "l"], rows, units };
+  }
   rows.push([
     "Diagnosis",
-    DIAGNOSIS_WORD[review.baseline.diagnosis],
-    DIAGNOSIS_WORD[review.candidate.diagnosis],
+    say(DIAGNOSIS_WORD, review.baseline.diagnosis, esc),
+    say(DIAGNOSIS_WORD, review.candidate.diagnosis, esc),
     "",
     "",
     "",
     ""
   ]);
-  const table2 = {
-    header: [
-      "Component",
-      "Baseline",
-      "Candidate",
-      "\u0394",
-      `${levelPercent(review)}% interval`,
-      "p",
-      "Call"
-    ],
-    align: ["l", "r", "r", "r", "r", "r", "l"],
-    rows
-  };
-  if (!compact) return table2;
-  const shorter = (row) => [
-    ...row.slice(0, 5),
-    (row[6] ?? "").replace(/^(up|down) \((\w+)\)$/, "$2")
-  ];
   return {
-    header: shorter(table2.header),
-    align: ["l", "r", "r", "r", "r", "l"],
-    rows: table2.rows.map(shorter)
+    header: [...header, "p", "Call"],
+    align: ["l", "r", "r", "r", "r", "r", "l"],
+    rows,
+    units
   };
 }
-function unavailableNotes(review, esc) {
-  const seen = /* @__PURE__ */ new Set();
-  for (const run of ["baseline", "candidate"]) {
-    for (const name of COMPONENT_ORDER) {
-      const c = review[run].components[name];
-      if (c.value === null && c.unavailable !== void 0) {
-        seen.add(`${COMPONENT_WORD[name]}: ${esc(c.unavailable, 300)}`);
-      }
-    }
-  }
-  return [...seen];
+function diagnosisLine(review, esc) {
+  return `Diagnosis: baseline ${say(DIAGNOSIS_WORD, review.baseline.diagnosis, esc)}; candidate ${say(DIAGNOSIS_WORD, review.candidate.diagnosis, esc)}.`;
 }
 function leversTable(review, esc) {
+  const f = numberFormatFor(review);
   return {
-    header: ["#", "Lever", "Why", "Evidence"],
-    align: ["r", "l", "l", "l"],
-    rows: review.levers.map((lever, i) => [
-      String(i + 1),
-      LEVER_TITLE[lever.id],
-      esc(lever.reason, 300),
-      lever.evidence.map((e) => esc(e, 200)).join(" \xB7 ") || "\u2014"
-    ])
+    header: ["#", "Lever", "Why"],
+    align: ["r", "l", "l"],
+    rows: review.levers.map((lever, i) => {
+      const text2 = leverText(lever, review, f, esc);
+      return [String(i + 1), text2.title, text2.sentences.join(" ") || "\u2014"];
+    })
   };
 }
 function sliceHarm(slice, review) {
@@ -23632,29 +24578,46 @@ function sortSlices(review) {
     (a, b) => rank(a) - rank(b) || sliceHarm(b, review) - sliceHarm(a, review) || (a.name < b.name ? -1 : a.name > b.name ? 1 : 0)
   );
 }
+var SLICE_CHANGE = /* @__PURE__ */ new Map([
+  ["worse", "worse"],
+  ["better", "better"],
+  ["flat", "flat"]
+]);
 function slicesTable(review, esc, limit) {
   const f = numberFormatFor(review);
   const rows = sortSlices(review).slice(0, limit).map((s) => [
     esc(s.name),
     s.examples === null ? "n/a" : count(s.examples),
-    num(s.baseline, f),
-    num(s.candidate, f),
-    signed(s.delta.estimate, f),
-    s.pAdjusted === null ? "n/a" : pValue(s.pAdjusted).replace(/^p /, "").replace(/^= /, ""),
-    s.hiddenRegression ? "worse (hidden)" : s.change
+    valueCell(s.baseline, f),
+    valueCell(s.candidate, f),
+    changeCell(s.delta.estimate, f),
+    pCell(s.pAdjusted),
+    s.hiddenRegression ? "worse (hidden)" : SLICE_CHANGE.get(s.change) ?? esc(s.change, 20)
   ]);
   return {
     header: ["Slice", "Examples", "Baseline", "Candidate", "\u0394", "p (Holm)", "Change"],
     align: ["l", "r", "r", "r", "r", "r", "l"],
-    rows
+    rows,
+    units: unitLine(f, "values")
   };
 }
-function sliceCounts(slices) {
+function sliceCounts(slices2) {
   const out = { worse: 0, better: 0, flat: 0 };
-  for (const s of slices) out[s.change] += 1;
+  for (const s of slices2) {
+    if (s.change === "worse") out.worse += 1;
+    else if (s.change === "better") out.better += 1;
+    else out.flat += 1;
+  }
   return out;
 }
 var MAX_HYPERPARAMETER_ROWS = 50;
+var HYPERPARAMETER_CHANGE = /* @__PURE__ */ new Map([
+  ["raised", "raised"],
+  ["lowered", "lowered"],
+  ["changed", "changed"],
+  ["added", "added"],
+  ["removed", "removed"]
+]);
 function hyperparameterTable(review, esc) {
   return {
     header: ["Hyperparameter", "Baseline", "Candidate", "Change"],
@@ -23663,71 +24626,99 @@ function hyperparameterTable(review, esc) {
       esc(h.key),
       h.kind === "added" ? "(absent)" : esc(displayValue(h.baseline), 60),
       h.kind === "removed" ? "(absent)" : esc(displayValue(h.candidate), 60),
-      h.kind
+      HYPERPARAMETER_CHANGE.get(h.kind) ?? esc(h.kind, 20)
     ])
   };
 }
 
 // src/report/headline.ts
-function changePhrase(name, delta, review) {
-  const f = numberFormatFor(review);
+function changePhrase(name, delta, review, f) {
   if (delta === null) return `${name} unknown`;
-  const level = levelPercent(review);
-  const stats = delta.ci === null ? `${signed(delta.estimate, f)}, noise unknown` : `${signed(delta.estimate, f)}, ${level}% interval ${interval(delta.ci, f)}, ${pValue(delta.p)}`;
-  const word = delta.call === "up" ? "rose" : delta.call === "down" ? "fell" : "held steady";
-  return `${name} ${word} (${stats})`;
+  const stats = delta.ci === null ? `${change(delta.estimate, f)}, noise unknown` : `${change(delta.estimate, f)}, ${levelPercent(review)}% interval ${changeInterval(delta.ci, f)}, ${pText(delta.p)}`;
+  const word2 = delta.call === "up" ? "rose" : delta.call === "down" ? "fell" : "held steady";
+  return `${name} ${word2} (${stats})`;
+}
+var GOOD_MOVEMENTS = /* @__PURE__ */ new Set([
+  "better-on-both",
+  "away-from-overfitting",
+  "away-from-underfitting"
+]);
+function guardrailLines(review, esc) {
+  const lines = [];
+  const tradeOff = tradeOffPhrase(review, esc);
+  if (tradeOff !== null) lines.push({ label: "Trade-off", text: `${tradeOff}.`, tone: "neutral" });
+  const inferior = guardrailNames(review, "inferior");
+  if (inferior.length > 0) {
+    lines.push({
+      label: `${inferior.length === 1 ? "Guardrail" : "Guardrails"} regressed beyond the margin`,
+      text: `${inferior.map((n) => esc(n, 60)).join(", ")}.`,
+      tone: "bad"
+    });
+  }
+  return lines;
 }
 function buildHeadline(review, esc) {
   const f = numberFormatFor(review);
   const metric = esc(review.metric.name, 60);
   const v = review.validation;
-  const vBase = review.splits.find((s) => s.split === "validation");
-  const movementTone = review.movement === "better-on-both" || review.movement === "away-from-overfitting" || review.movement === "away-from-underfitting" ? "good" : review.movement === "no-significant-change" ? "neutral" : "bad";
+  const vSplit = review.splits.find((s) => s.split === "validation");
+  const movementTone = GOOD_MOVEMENTS.has(review.movement) ? "good" : review.movement === "no-significant-change" ? "neutral" : "bad";
   const vTone = v.change === "better" ? "good" : v.change === "worse" ? "bad" : "neutral";
-  const level = levelPercent(review);
-  const vStats = v.delta.ci === null ? `\u0394 ${signed(v.delta.estimate, f)}; run-to-run noise unknown` : `\u0394 ${signed(v.delta.estimate, f)}, ${level}% interval ${interval(v.delta.ci, f)}, ${pValue(v.delta.p)}, ${TEST_WORD[v.delta.test]}`;
-  const from = vBase === void 0 ? "" : `${num(vBase.baseline, f)} \u2192 ${num(vBase.candidate, f)} `;
+  const vStats = v.delta.ci === null ? `${change(v.delta.estimate, f)}; run-to-run noise unknown` : `${change(v.delta.estimate, f)}, ${levelPercent(review)}% interval ${changeInterval(v.delta.ci, f)}, ${pText(v.delta.p)}, ${say(TEST_WORD, v.delta.test, esc)}`;
+  const from = vSplit === void 0 ? "" : `${value(vSplit.baseline, f)} \u2192 ${value(vSplit.candidate, f)} `;
   const lines = [
     {
-      label: MOVEMENT_SENTENCE[review.movement],
-      text: `${changePhrase(
-        "avoidable bias",
-        review.bias.delta,
-        review
-      )}; ${changePhrase("variance", review.variance.delta, review)}. Diagnosis: baseline ${DIAGNOSIS_WORD[review.baseline.diagnosis]}, candidate ${DIAGNOSIS_WORD[review.candidate.diagnosis]}.`,
+      label: say(MOVEMENT_SENTENCE, review.movement, esc),
+      text: `${changePhrase("avoidable bias", review.bias.delta, review, f)}; ${changePhrase(
+        "variance",
+        review.variance.delta,
+        review,
+        f
+      )}. Diagnosis: baseline ${say(DIAGNOSIS_WORD, review.baseline.diagnosis, esc)}, candidate ${say(
+        DIAGNOSIS_WORD,
+        review.candidate.diagnosis,
+        esc
+      )}.`,
       tone: movementTone
     },
     {
-      label: `Validation ${metric} ${VALIDATION_WORD[v.change]}`,
-      text: `${from}(${vStats}).`,
+      label: `Validation ${metric} ${say(VALIDATION_WORD, v.change, esc)}`,
+      text: `${from}(\u0394 ${vStats}).`,
       tone: vTone
+    },
+    ...guardrailLines(review, esc),
+    {
+      label: review.gate.pass ? "Gate passed" : "Gate failed",
+      text: gateSentence(review, esc),
+      tone: review.gate.pass ? "good" : "bad"
     }
   ];
-  const gate = review.gate;
-  lines.push({
-    label: gate.pass ? "Gate passed" : "Gate failed",
-    text: gate.pass ? gate.failOn.length === 0 ? "no fail-on policy is set." : `none of fail-on (${gate.failOn.map((p) => esc(p, 60)).join(", ")}) applies.` : `${gate.reasons.map((r) => esc(r, 200)).join("; ")}.`,
-    tone: gate.pass ? "good" : "bad"
-  });
   const first = review.levers[0];
-  lines.push(
-    first === void 0 ? { label: "Next lever", text: "none suggested.", tone: "neutral" } : {
-      label: `Next lever: ${LEVER_TITLE[first.id]}`,
-      text: esc(first.reason, 300),
+  if (first === void 0)
+    lines.push({ label: "Next lever", text: "none suggested.", tone: "neutral" });
+  else {
+    const text2 = leverText(first, review, f, esc);
+    lines.push({
+      label: `Next lever: ${text2.title}`,
+      text: text2.sentences.join(" ") || "\u2014",
       tone: "neutral"
-    }
-  );
+    });
+  }
   const hidden = sortSlices(review).filter((s) => s.hiddenRegression);
   const worst = hidden[0];
   if (worst !== void 0) {
     lines.push({
       label: `${hidden.length} ${hidden.length === 1 ? "slice" : "slices"} got worse while validation improved`,
-      text: `worst: ${esc(worst.name, 60)} (${signed(worst.delta.estimate, f)}).`,
+      text: `worst: ${esc(worst.name, 60)} (${value(worst.baseline, f)} \u2192 ${value(worst.candidate, f)}, ${change(worst.delta.estimate, f)}).`,
       tone: "bad"
     });
   }
-  const title = `${MOVEMENT_TITLE[review.movement]} \xB7 validation ${VALIDATION_WORD[v.change]} \xB7 gate ${gate.pass ? "passed" : "failed"}`;
-  return { title, tone: gate.pass ? movementTone : "bad", lines };
+  const title = `${say(MOVEMENT_TITLE, review.movement, esc)} \xB7 validation ${say(
+    VALIDATION_WORD,
+    v.change,
+    esc
+  )} \xB7 gate ${review.gate.pass ? "passed" : "failed"}`;
+  return { title, tone: review.gate.pass ? movementTone : "bad", lines };
 }
 
 // src/report/marker.ts
@@ -23789,8 +24780,8 @@ function planeChart(review) {
     ...points.map(([run, b, v]) => `  "${run}": [${axis(b)}, ${axis(v)}]`)
   ];
   const metric = escapeInline(review.metric.name, 40);
-  const values = points.map(([run, b, v]) => `${run} bias ${num(b, format)}, variance ${num(v, format)}`).join("; ");
-  const caption = `**Bias/variance plane** (${metric}, shortfall units). Each axis is scaled so that its middle line is the presence threshold, ${num(t, format)} (gap tolerance ${short(review.settings.gapTolerance)} \xD7 the mean validation error level); right of it avoidable bias is large enough to count, above it variance. Values: ${values}.`;
+  const values = points.map(([run, b, v]) => `${run} bias ${difference(b, format)}, variance ${difference(v, format)}`).join("; ");
+  const caption = `**Bias/variance plane** (${metric}, shortfall units). Each axis is scaled so that its middle line is the presence threshold, ${difference(t, format)} (gap tolerance ${short(review.settings.gapTolerance)} \xD7 the mean validation error level); right of it avoidable bias is large enough to count, above it variance. Values: ${values}.`;
   return { kind: "plane", caption, code: lines.join("\n") };
 }
 var CURVE_TEXT = {
@@ -23863,40 +24854,43 @@ function curveCharts(review, curve) {
     return [lineChart(review, curve, series, [range[0], range[1]], yRange, run)];
   });
 }
-function lineChart(review, curve, series, [lo, hi], [yMin, yMax], only) {
-  const text = CURVE_TEXT[curve];
+function lineChart(review, curve, series, [lo, hi], yRange, only) {
+  const text2 = CURVE_TEXT[curve];
   const ordered = orderSeries(series);
   const xs = [
     ...new Set(ordered.flatMap((s) => s.points.map((p) => p[0])).filter((x) => x >= lo && x <= hi))
   ].sort((a, b) => a - b);
   const geometric = curve !== "epochs" && lo > 0 && hi / lo >= 10;
   const grid = geometric ? thin(xs, MAX_POINTS) : evenGrid(lo, hi, Math.min(MAX_POINTS, xs.length));
+  const percent = review.metric.kind === "proportion";
+  const yScale = percent ? 100 : 1;
+  const [yMin, yMax] = [yRange[0] * yScale, yRange[1] * yScale];
   const yPad = (yMax - yMin) * 0.05 || Math.abs(yMax) * 0.05 || 1;
   const y0 = yMin - yPad;
   const y1 = yMax + yPad;
   const yDecimals = Math.min(6, Math.max(0, 2 - Math.floor(Math.log10(y1 - y0))));
   const xDecimals = Number.isInteger(lo) && Number.isInteger(hi) ? 0 : Math.min(6, Math.max(0, 2 - Math.floor(Math.log10(Math.max(hi - lo, 1e-9)))));
   const metric = mermaidLabel(review.metric.name, 40) || "metric";
-  const unit = review.metric.kind === "proportion" ? "proportion" : "metric units";
-  const title = only === null ? text.title : `${text.title}, ${only}`;
+  const unit2 = percent ? "%" : "metric units";
+  const title = only === null ? text2.title : `${text2.title}, ${only}`;
   const palette = ordered.map((s) => PALETTE[paletteKey(s)][0]).join(", ");
   const lines = [
     `%%{init: {"themeVariables": {"xyChart": {"plotColorPalette": "${palette}"}}}}%%`,
     "xychart-beta",
     `  title "${title}"`,
-    geometric ? `  x-axis "${text.x}" [${grid.map((x) => `"${short(x)}"`).join(", ")}]` : `  x-axis "${text.x}" ${chartNumber(lo, xDecimals)} --> ${chartNumber(hi, xDecimals)}`,
-    `  y-axis "${metric} (${unit})" ${chartNumber(y0, yDecimals)} --> ${chartNumber(y1, yDecimals)}`,
+    geometric ? `  x-axis "${text2.x}" [${grid.map((x) => `"${short(x)}"`).join(", ")}]` : `  x-axis "${text2.x}" ${chartNumber(lo, xDecimals)} --> ${chartNumber(hi, xDecimals)}`,
+    `  y-axis "${metric} (${unit2})" ${chartNumber(y0, yDecimals)} --> ${chartNumber(y1, yDecimals)}`,
     ...ordered.map(
-      (s) => `  line [${grid.map((x) => chartNumber(interpolate(s.points, x, geometric), yDecimals + 1)).join(", ")}]`
+      (s) => `  line [${grid.map((x) => chartNumber(yScale * interpolate(s.points, x, geometric), yDecimals + 1)).join(", ")}]`
     )
   ];
   const legend = ordered.map((s) => `${PALETTE[paletteKey(s)][1]} = ${s.run} ${s.part}`).join(", ");
   const scale = geometric ? " The x positions are evenly spaced categories (roughly a log scale)." : "";
   const clipped = only === null && series.some((s) => s.points.some((p) => p[0] < lo || p[0] > hi)) ? ` Drawn over the x range both runs cover (${short(lo)} to ${short(hi)}).` : "";
-  const caption = `**${text.caption}${only === null ? "" : ` (${only})`}**, ${escapeInline(
+  const caption = `**${text2.caption}${only === null ? "" : ` (${only})`}**, ${escapeInline(
     review.metric.name,
     40
-  )} by ${text.x}. Lines: ${legend}.${scale}${clipped}`;
+  )} by ${text2.x}. Lines: ${legend}.${scale}${clipped}`;
   return { kind: curve, caption, code: lines.join("\n") };
 }
 function paletteKey(s) {
@@ -23938,11 +24932,89 @@ function interpolate(points, x, logX) {
 }
 
 // src/report/notes.ts
+function names(list, total, esc) {
+  return `${list.map((n) => esc(n, 60)).join(", ")}${total > list.length ? ", \u2026" : ""}`;
+}
+function slices(n) {
+  return `${count(n)} ${n === 1 ? "slice" : "slices"}`;
+}
+function noteSentence(note, review, f, esc) {
+  switch (note.code) {
+    case "train-dev-in-one-run":
+      return "Only one run has a train-dev split: the variance change is measured as validation \u2212 train in both.";
+    case "unpaired-slices":
+      return `${slices(note.count)} appear in one run only and were not compared: ${names(note.names, note.count, esc)}.`;
+    case "hidden-regressions":
+      return `Validation improved overall, yet ${slices(note.count)} regressed significantly (Holm-adjusted): ${names(note.names, note.count, esc)}.`;
+    case "noise-unknown":
+      return review.settings.minEffect > 0 ? `Run-to-run noise is unknown (one repeat of a continuous metric, no per-example predictions): changes are called on size alone (min-effect ${amount(review.settings.minEffect, f)}).` : "Run-to-run noise is unknown (one repeat of a continuous metric, no per-example predictions) and min-effect is 0: no change can be called. Add repeats (seeds), per-example predictions, or set min-effect.";
+    case "bias-unknown":
+      return "Avoidable bias is unknown: there is no reference level for this metric. Its change is still measured from the training error; the diagnosis rests on variance and data mismatch.";
+    case "predictions-share-no-id":
+      return "The two predictions files share no id: the paired test was not used.";
+    case "predictions-in-one-run":
+      return "Only one run ships per-example predictions: no paired test.";
+    case "predictions-split-mismatch":
+      return `The predictions are for different splits (${say(SPLIT_WORD, note.baseline, esc)} in the baseline, ${say(SPLIT_WORD, note.candidate, esc)} in the candidate): no paired test.`;
+    case "predictions-unmatched":
+      return `Predictions paired by id: ${count(note.rows)} rows in both; ${count(note.baseline)} baseline and ${count(note.candidate)} candidate rows had no partner and were left out of the paired test.`;
+    case "epoch-log-not-used":
+      return `${esc(note.file, 120)}: the artifact has its own epoch curve; the epoch log ${esc(note.log, 120)} was not used.`;
+    case "epoch-log-missing":
+      return `No epoch log ${esc(note.log, 120)} next to ${esc(note.file, 120)}; the config's epoch-log mapping was not applied to it.`;
+    default:
+      return esc(String(note.code), 60);
+  }
+}
+var NON_LEVER = /* @__PURE__ */ new Map([
+  [
+    "smaller-training-set",
+    "A smaller training set is not a cure for high bias: it only lowers the training error, while validation error stays high or rises."
+  ]
+]);
+var WARNING = /* @__PURE__ */ new Map([
+  [
+    "validation-overfit",
+    "test error is well above validation error: model choices may be tuned to the validation set."
+  ]
+]);
+function reviewNotes2(review, f, esc) {
+  return [
+    ...["baseline", "candidate"].flatMap(
+      (run) => review[run].warnings.map((w) => `${run}: ${say(WARNING, w, esc)}`)
+    ),
+    ...review.notes.map((n) => noteSentence(n, review, f, esc)),
+    ...review.nonLevers.map((n) => say(NON_LEVER, n, esc))
+  ];
+}
+var UNAVAILABLE2 = /* @__PURE__ */ new Map([
+  [
+    "no-reference",
+    "no reference level: give `reference` in the artifact or the config (human-level error, a prior system, or an estimated Bayes error)."
+  ],
+  ["no-train-dev", "needs a train-dev split (held-out data from the training distribution)."],
+  ["no-test", "needs a test split."]
+]);
+function unavailableNotes(review, esc) {
+  const seen = /* @__PURE__ */ new Set();
+  for (const run of ["baseline", "candidate"]) {
+    for (const name of COMPONENT_ORDER) {
+      const c = review[run].components[name];
+      if (c.value === null && c.unavailable !== void 0) {
+        seen.add(`${say(COMPONENT_TITLE, name, esc)}: ${say(UNAVAILABLE2, c.unavailable, esc)}`);
+      }
+    }
+  }
+  return [...seen];
+}
+
+// src/report/method.ts
 function methodNotes(review, esc) {
+  const f = numberFormatFor(review);
   const s = review.settings;
   const lines = [
     `alpha = ${short(s.alpha)}: a change counts as up or down only when it is significant at this level and at least min-effect in size; intervals are ${levelPercent(review)}%.`,
-    `min-effect = ${short(s.minEffect)} (${review.metric.kind === "proportion" ? "proportion" : "metric units"}): smaller changes are called flat however significant.`,
+    `min-effect = ${amount(s.minEffect, f)}: smaller changes are called flat however significant.`,
     `gap tolerance = ${short(s.gapTolerance)}: a component is present when it is at least this share of the run's validation error level (and at least min-effect, and significantly above 0 where its noise is known).`,
     `fail-on = ${s.failOn.length === 0 ? "(empty: the gate always passes)" : s.failOn.map((p) => esc(p, 60)).join(", ")}.`
   ];
@@ -23956,13 +25028,20 @@ function methodNotes(review, esc) {
   use("variance", review.variance.delta);
   use("data mismatch", review.mismatch.delta);
   use("validation overfit", review.overfit.delta);
-  for (const split of review.splits) use(`${SPLIT_WORD[split.split]} split`, split.delta);
-  if (review.slices.length > 0) {
-    const tests = [...new Set(review.slices.map((x) => x.delta.test))];
-    for (const t of tests) uses.set(t, [...uses.get(t) ?? [], "slices"]);
+  for (const split of review.splits) use(`${say(SPLIT_WORD, split.split, esc)} split`, split.delta);
+  for (const slice of review.slices) use("slices", slice.delta);
+  for (const [test2, what] of uses) {
+    lines.push(`${[...new Set(what)].join(", ")}: ${say(TEST_WHY, test2, esc)}`);
   }
-  for (const [test, what] of uses) {
-    lines.push(`${[...new Set(what)].join(", ")}: ${TEST_WHY[test]}`);
+  if ((review.guardrails ?? []).some((g) => g.margin !== null)) {
+    lines.push(
+      `Guardrails: a guardrail is within its margin when the one-sided ${levelPercent(review)}% upper confidence bound of its worsening is below the margin, beyond it when the lower bound is above the margin, and undetermined otherwise (the confidence-interval approach to non-inferiority, ICH E9 \xA73.3.2 and E10; Wellek 2010). The one-sided p-values are Holm-adjusted across guardrails; the primary verdict is not adjusted by them. A margin from the config wins over the artifacts', the baseline's over the candidate's.`
+    );
+  }
+  if (review.cost !== void 0 && Object.keys(review.cost).length > 0) {
+    lines.push(
+      "Cost ratios are candidate / baseline; with per-repeat values the interval comes from Welch's t-test on the logarithms (a ratio of geometric means). A single figure (parameters, memory) changes exactly as given; a timing taken once per run has unknown noise."
+    );
   }
   if (review.slices.length > 0) {
     lines.push(
@@ -23976,36 +25055,29 @@ function methodNotes(review, esc) {
     );
   }
   for (const run of ["baseline", "candidate"]) {
-    const r = review[run];
-    lines.push(referenceLine(run, r, review));
-    for (const w of r.warnings) lines.push(`${run}: ${esc(w, 300)}`);
+    lines.push(referenceLine(run, review[run], f, esc));
   }
-  for (const n of review.notes) lines.push(esc(n, 300));
-  for (const n of review.nonLevers) lines.push(esc(n, 300));
+  lines.push(...reviewNotes2(review, f, esc));
   return lines;
 }
-function referenceLine(run, r, review) {
-  const f = numberFormatFor(review);
+function referenceLine(run, r, f, esc) {
   if (r.reference === null) {
     return `${run}: no reference level, so avoidable bias is unknown; set \`reference\` in the artifact or the config.`;
   }
-  const source = {
-    artifact: "from the artifact",
-    config: "from the config",
-    default: "the default for a minimized proportion",
-    unknown: "source unknown"
-  }[r.referenceSource];
-  return `${run}: reference level ${num(r.reference, f)} (${source}).`;
+  return `${run}: reference level ${value(r.reference, f)} (${say(REFERENCE_SOURCE, r.referenceSource, esc)}).`;
 }
-var CURVE_WORD = {
-  epochs: "Epoch curve",
-  training_examples: "Learning curve",
-  regularization: "Regularization curve"
-};
-function skipped(e) {
+function skippedText(e) {
+  return e.skipped === "fit-failed" ? "the power-law fit did not converge" : `needs at least ${count(e.needs)} points, has ${count(e.points)}`;
+}
+var SIDE_WORD = /* @__PURE__ */ new Map([
+  ["below", "below"],
+  ["above", "above"],
+  ["at", "at"]
+]);
+function isSkipped2(e) {
   return "skipped" in e;
 }
-function curveEvidence(review, esc) {
+function curveEvidence2(review) {
   const f = numberFormatFor(review);
   const lines = [];
   for (const run of ["baseline", "candidate"]) {
@@ -24013,22 +25085,27 @@ function curveEvidence(review, esc) {
     const e = curves.epochs;
     if (e !== void 0) {
       lines.push(
-        skipped(e) ? `${run}, ${CURVE_WORD.epochs}: not analysed (${esc(e.skipped, 200)}).` : `${run}, ${CURVE_WORD.epochs}: lowest validation ${num(e.bestValidation, f)} at epoch ${short(e.bestX)}; final ${num(e.finalValidation, f)} at epoch ${short(e.finalX)}; ${e.gl === null ? "generalization loss undefined (best validation is 0)" : `generalization loss ${e.gl.toFixed(1)}%`}${e.pq === null ? "" : `, progress quotient ${e.pq.toFixed(2)}`}${e.stoppedLate ? "; trained past the minimum" : ""}${e.stoppedEarly ? "; still improving at the end" : ""}.`
+        isSkipped2(e) ? `${run}, epoch curve: not analysed (${skippedText(e)}).` : `${run}, epoch curve: lowest validation ${value(e.bestValidation, f)} at epoch ${short(e.bestX)}; final ${value(e.finalValidation, f)} at epoch ${short(e.finalX)}; ${e.gl === null ? "generalization loss undefined (best validation is 0)" : `generalization loss ${fixed(e.gl, 1)}%`}${e.pq === null ? "" : `, progress quotient ${fixed(e.pq, 2)}`}${e.stoppedLate ? "; trained past the minimum" : ""}${e.stoppedEarly ? "; still improving at the end" : ""}.`
       );
     }
     const l = curves.training_examples;
     if (l !== void 0) {
-      const lp = skipped(l) ? "" : l.projections.map(
-        (p) => `${short(p.x)} examples \u2192 ${num(p.validation, f)} [${num(p.ci[0], f)}, ${num(p.ci[1], f)}]`
-      ).join("; ");
-      lines.push(
-        skipped(l) ? `${run}, ${CURVE_WORD.training_examples}: not analysed (${esc(l.skipped, 200)}).` : `${run}, ${CURVE_WORD.training_examples}: power-law fit R\xB2 ${l.r2.toFixed(3)}, residual sd ${num(l.residual, f)}; projected validation: ${lp || "none"}; train/validation gap ${l.gapTrend}.`
-      );
+      if (isSkipped2(l)) lines.push(`${run}, learning curve: not analysed (${skippedText(l)}).`);
+      else {
+        const projected = l.projections.map((p) => `${count(p.x)} examples \u2192 ${value(p.validation, f)} (${valueRange(p.ci, f)})`).join("; ");
+        lines.push(
+          `${run}, learning curve: power-law fit R\xB2 ${fixed(l.r2, 3)}, residual sd ${amount(l.residual, f)}; projected validation: ${projected || "none"}; train/validation gap ${l.gapTrend === "closing" ? "closing" : l.gapTrend === "flat" ? "flat" : "unknown"}.`
+        );
+      }
     }
     const g = curves.regularization;
-    if (g !== void 0) {
+    if (g !== void 0 && isSkipped2(g))
+      lines.push(`${run}, regularization curve: not analysed (${skippedText(g)}).`);
+    else if (g !== void 0) {
+      const side = SIDE_WORD.get(g.side) ?? "at an unknown place relative to";
+      const edge = g.atEdge === null ? "" : `; the minimum is at the ${g.atEdge === "low" ? "low" : "high"} end of the sweep, so extend it`;
       lines.push(
-        skipped(g) ? `${run}, ${CURVE_WORD.regularization}: not analysed (${esc(g.skipped, 200)}).` : `${run}, ${CURVE_WORD.regularization}: lowest validation ${num(g.bestValidation, f)} at strength ${short(g.bestX)}; the run's own strength is ${g.side === "at" ? "at" : g.side === "unknown" ? "at an unknown place relative to" : g.side} the best; suggested ${short(g.suggestedX)}${g.atEdge === null ? "" : `; the minimum is at the ${g.atEdge} end of the sweep, so extend it`}.`
+        `${run}, regularization curve: lowest validation ${value(g.bestValidation, f)} at strength ${short(g.bestX)}; the run's own strength is ${side} the best; suggested ${short(g.suggestedX)}${edge}.`
       );
     }
   }
@@ -24106,7 +25183,10 @@ Too large for this space: see the JSON report.
   return stub.length <= target ? stub : stub.slice(0, Math.max(0, target));
 }
 function table(t) {
-  return markdownTable([t.header, ...t.rows], { align: t.align, alignDelimiters: false });
+  const body = markdownTable([t.header, ...t.rows], { align: t.align, alignDelimiters: false });
+  return t.units === void 0 || t.units === null ? body : `${t.units}
+
+${body}`;
 }
 function details(summary, body) {
   return ["<details>", `<summary>${summary}</summary>`, "", ...body, "", "</details>", ""];
@@ -24122,8 +25202,10 @@ function headlineBlock(review) {
 }
 function compose(review, { marker, files, charts }, d) {
   const out = [marker, ...headlineBlock(review)];
-  out.push("### Splits", "", table(splitsTable(review)), "");
-  out.push("### Error decomposition", "", table(decompositionTable(review)), "");
+  const guards = guardrailsTable(review, escapeInline, levelPercent(review));
+  if (guards !== null) out.push("### Guardrails and cost", "", table(guards), "");
+  out.push("### Splits", "", table(splitsTable(review, escapeInline)), "");
+  out.push("### Error decomposition", "", table(decompositionTable(review, escapeInline)), "");
   const missing = unavailableNotes(review, escapeInline);
   if (missing.length > 0) out.push(...missing.map((m) => `- ${m}`), "");
   if (review.levers.length > 0) {
@@ -24156,7 +25238,7 @@ function compose(review, { marker, files, charts }, d) {
     );
   }
   if (d.rest) {
-    const evidence = curveEvidence(review, escapeInline);
+    const evidence = curveEvidence2(review);
     if (evidence.length > 0)
       out.push(
         ...details(
@@ -24211,10 +25293,10 @@ var ANSI = {
 };
 function renderText(review, options) {
   const width = Math.max(40, Math.floor(options.width ?? 80));
-  const paint = (text, ...codes) => options.color && codes.length > 0 ? `${codes.join("")}${text}${ANSI.reset}` : text;
+  const paint = (text2, ...codes) => options.color && codes.length > 0 ? `${codes.join("")}${text2}${ANSI.reset}` : text2;
   const tone = (t) => t === "good" ? [ANSI.green] : t === "bad" ? [ANSI.red] : [];
-  const heading = (text) => paint(text, ANSI.bold);
-  const esc = (text, max) => terminalText(text, max);
+  const heading = (text2) => paint(text2, ANSI.bold);
+  const esc = (text2, max) => terminalText(text2, max);
   const h = buildHeadline(review, esc);
   const out = [];
   for (const line of wrap(`fitgap review: ${h.title}`, width, "")) {
@@ -24231,28 +25313,27 @@ function renderText(review, options) {
     }
     out.push(...rest);
   }
-  const splits = splitsTable(review);
+  const guards = guardrailsTable(review, esc, levelPercent(review), true);
+  if (guards !== null) out.push("", heading("Guardrails and cost"), ...textTable(guards, width));
+  const splits = splitsTable(review, esc);
   const fitted = naturalWidth(splits) > width ? withoutColumn(splits, "Reading") : splits;
   out.push("", heading("Splits"), ...textTable(fitted, width), "");
-  const decomposition = decompositionTable(review, true);
-  const diagnosis = decomposition.rows.pop();
-  out.push(heading("Error decomposition"), ...textTable(decomposition, width));
-  const notes = [
-    "* present: large enough to count.",
-    diagnosis === void 0 ? "" : `Diagnosis: baseline ${diagnosis[1]}; candidate ${diagnosis[2]}.`
-  ];
-  for (const n of notes.filter((x) => x !== "")) out.push(...wrap(n, width, "    ", "  "));
+  out.push(
+    heading("Error decomposition"),
+    ...textTable(decompositionTable(review, esc, true), width)
+  );
+  for (const n of ["* present: large enough to count.", diagnosisLine(review, esc)])
+    out.push(...wrap(n, width, "    ", "  "));
   for (const m of unavailableNotes(review, esc)) out.push(...wrap(m, width, "    ", "  - "));
   out.push("");
   if (review.levers.length > 0) {
     out.push(heading("Next levers"));
+    const f = numberFormatFor(review);
     review.levers.forEach((lever, i) => {
       const n = `${i + 1}. `;
       const pad = " ".repeat(n.length + 2);
-      out.push(
-        ...wrap(`${LEVER_TITLE[lever.id]}: ${esc(lever.reason, 300)}`, width, pad, `  ${n}`)
-      );
-      for (const e of lever.evidence) out.push(...wrap(esc(e, 200), width, `${pad}  `, `${pad}- `));
+      const text2 = leverText(lever, review, f, esc);
+      out.push(...wrap(`${text2.title}: ${text2.sentences.join(" ")}`, width, pad, `  ${n}`));
     });
     out.push("");
   }
@@ -24276,7 +25357,7 @@ function renderText(review, options) {
     );
     out.push("");
   }
-  const evidence = curveEvidence(review, esc);
+  const evidence = curveEvidence2(review);
   if (evidence.length > 0) {
     out.push(heading("Curve evidence"));
     for (const e of evidence) out.push(...wrap(e, width, "    ", "  - "));
@@ -24306,21 +25387,21 @@ function withoutColumn(t, header) {
   const c = t.header.indexOf(header);
   if (c < 0) return t;
   const drop = (row) => row.filter((_, i) => i !== c);
-  return { header: drop(t.header), align: drop(t.align), rows: t.rows.map(drop) };
+  return { ...t, header: drop(t.header), align: drop(t.align), rows: t.rows.map(drop) };
 }
-function wrap(text, width, indent, first = indent) {
+function wrap(text2, width, indent, first = indent) {
   const lines = [];
   let line = first;
   let empty = true;
-  for (const word of text.split(" ").filter((w) => w !== "")) {
-    const candidate = empty ? `${line}${word}` : `${line} ${word}`;
+  for (const word2 of text2.split(" ").filter((w) => w !== "")) {
+    const candidate = empty ? `${line}${word2}` : `${line} ${word2}`;
     if (Array.from(candidate).length <= width) {
       line = candidate;
       empty = false;
       continue;
     }
     if (!empty) lines.push(line);
-    let rest = word;
+    let rest = word2;
     line = lines.length === 0 && empty ? first : indent;
     while (Array.from(line + rest).length > width) {
       const room = Math.max(1, width - Array.from(line).length);
@@ -24354,7 +25435,8 @@ function textTable(t, width) {
     widths.map((_, c) => c),
     2
   );
-  return rows.map((r) => {
+  const units = t.units === void 0 || t.units === null ? [] : wrap(t.units, width, "  ");
+  const lines = rows.map((r) => {
     const cells = widths.map((w, c) => {
       const cell = truncate(r[c] ?? "", w);
       const pad = " ".repeat(Math.max(0, w - len(cell)));
@@ -24362,6 +25444,7 @@ function textTable(t, width) {
     });
     return `  ${cells.join("  ")}`.trimEnd();
   });
+  return [...units, ...lines];
 }
 
 // src/report/json.ts
@@ -24370,21 +25453,21 @@ function renderJson(review) {
   return `${JSON.stringify(review, null, 2)}
 `;
 }
-function assertFinite2(value, pointer) {
-  if (typeof value === "number") {
-    if (!Number.isFinite(value)) {
+function assertFinite2(value2, pointer) {
+  if (typeof value2 === "number") {
+    if (!Number.isFinite(value2)) {
       throw new RangeError(
-        `fitgap-review/1 ${pointer || "/"} is ${String(value)}; the review model must hold finite numbers only (this is a bug)`
+        `fitgap-review/1 ${pointer || "/"} is ${String(value2)}; the review model must hold finite numbers only (this is a bug)`
       );
     }
     return;
   }
-  if (Array.isArray(value)) {
-    value.forEach((item, i) => assertFinite2(item, `${pointer}/${i}`));
+  if (Array.isArray(value2)) {
+    value2.forEach((item, i) => assertFinite2(item, `${pointer}/${i}`));
     return;
   }
-  if (value !== null && typeof value === "object") {
-    for (const [key, item] of Object.entries(value)) {
+  if (value2 !== null && typeof value2 === "object") {
+    for (const [key, item] of Object.entries(value2)) {
       assertFinite2(item, `${pointer}/${key.replace(/~/g, "~0").replace(/\//g, "~1")}`);
     }
   }
@@ -24456,18 +25539,18 @@ async function reviewCommand(argv, io) {
     limits,
     ...typeof config === "string" ? { config } : {}
   });
-  const text = renderReview(result, format, {
+  const text2 = renderReview(result, format, {
     color: io.color && typeof values["out"] !== "string",
     ...typeof commentKey === "string" ? { commentKey } : {}
   });
   const out = values["out"];
   if (typeof out === "string") {
-    await io.writeFile(resolve4(io.cwd, out), text, { file: out, inputs: result.read });
+    await io.writeFile(resolve4(io.cwd, out), text2, { file: out, inputs: result.read });
     io.stderr(
       `fitgap: review written to ${out} (gate ${result.review.gate.pass ? "passed" : "failed"}).
 `
     );
-  } else io.stdout(text);
+  } else io.stdout(text2);
   return result.review.gate.pass ? EXIT.ok : EXIT.gateFailed;
 }
 async function validateCommand(argv, io) {
@@ -24542,13 +25625,13 @@ async function demoCommand(argv, io) {
     io.stdout(DEMO_HELP);
     return EXIT.ok;
   }
-  const names = await listDemos(io.demoDir);
-  const first = names[0];
+  const names2 = await listDemos(io.demoDir);
+  const first = names2[0];
   if (first === void 0) throw new Error(`no demo candidates in ${io.demoDir}`);
   const name = positionals[0] ?? first;
-  if (!names.includes(name))
+  if (!names2.includes(name))
     throw new UsageError(
-      `fitgap demo: no demo named ${JSON.stringify(name)}; choose one of ${names.join(", ")}.`
+      `fitgap demo: no demo named ${JSON.stringify(name)}; choose one of ${names2.join(", ")}.`
     );
   const format = parseFormat(values["format"], "demo");
   const result = await reviewFiles({
@@ -24559,7 +25642,7 @@ async function demoCommand(argv, io) {
   });
   io.stdout(renderReview(result, format, { color: io.color }));
   if (format === "text") {
-    const others = names.filter((n) => n !== name);
+    const others = names2.filter((n) => n !== name);
     io.stdout(`
 Demo: Crumb & Co. baseline vs candidate "${name}". See the others with:
 `);
@@ -24568,6 +25651,1628 @@ Demo: Crumb & Co. baseline vs candidate "${name}". See the others with:
     io.stdout("Add --format markdown for the PR comment, or --format json for the report.\n");
   }
   return EXIT.ok;
+}
+
+// src/io/write-output.ts
+import { realpath as realpath2, stat, writeFile } from "node:fs/promises";
+import { basename, dirname as dirname3, join as join2, resolve as resolve5 } from "node:path";
+function refuse2(file, expected, got, hint) {
+  throw new InputError([{ file, pointer: "", expected, got, hint }]);
+}
+async function realTarget(path) {
+  const real = await realpath2(path).catch(() => null);
+  if (real !== null) return real;
+  const folder = await realpath2(dirname3(path)).catch(() => null);
+  return folder === null ? null : join2(folder, basename(path));
+}
+async function identify(path) {
+  const real = await realpath2(path).catch(() => null);
+  const info = real === null ? null : await stat(real).catch(() => null);
+  return real === null || info === null ? null : { realPath: real, id: `${info.dev}:${info.ino}` };
+}
+async function writeOutput(path, text2, file, inputs) {
+  const target = resolve5(path);
+  const real = await realTarget(target);
+  const info = await stat(target).catch(() => null);
+  const id = info === null ? null : `${info.dev}:${info.ino}`;
+  if (inputs.some((input) => input.realPath === real || id !== null && input.id === id)) {
+    refuse2(
+      file,
+      "must not name one of the review's input files (--out)",
+      "an input file",
+      "Write the review to a new file."
+    );
+  }
+  if (info?.isDirectory() === true)
+    refuse2(file, "could not be written (--out)", "a folder", "Name a file, not a folder.");
+  try {
+    await writeFile(target, text2, "utf8");
+  } catch (error) {
+    const code = error.code;
+    const got = code === "ENOENT" ? "no such folder" : code === "ENOSPC" ? "no space left on the device" : code === "EROFS" ? "a read-only file system" : describeCode(code);
+    refuse2(
+      file,
+      "could not be written (--out)",
+      got,
+      "Check that the folder exists and can be written to."
+    );
+  }
+}
+
+// src/entries/cli/curves-import.ts
+import { resolve as resolve6 } from "node:path";
+
+// src/artifact/curve-logs/limits.ts
+var MAX_POINTS2 = 1e6;
+var MAX_SERIES = 1e4;
+var MAX_TEXT_BYTES = 64 * 1024 * 1024;
+var MAX_EVENT_FILE_BYTES = 512 * 1024 * 1024;
+
+// src/artifact/curve-logs/text.ts
+var decoder = new TextDecoder("utf-8", { fatal: true });
+function decodeText(input, file, what) {
+  if (typeof input !== "string" && input.length > MAX_TEXT_BYTES) {
+    throw new InputError([
+      {
+        file,
+        pointer: "",
+        expected: `must be at most ${MAX_TEXT_BYTES / 1024 / 1024} MiB for ${what}`,
+        got: `${input.length} bytes`,
+        hint: "Import a shorter log, or thin it out before importing."
+      }
+    ]);
+  }
+  let text2;
+  try {
+    text2 = typeof input === "string" ? input : decoder.decode(input);
+  } catch {
+    throw new InputError([
+      {
+        file,
+        pointer: "",
+        expected: `must be UTF-8 text (${what})`,
+        hint: "Check that the file is the log itself and not a binary or compressed file."
+      }
+    ]);
+  }
+  return text2.charCodeAt(0) === 65279 ? text2.slice(1) : text2;
+}
+var DECIMAL2 = /^[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?$/;
+function parseDecimal2(text2) {
+  const t = text2.trim();
+  if (DECIMAL2.test(t)) return Number(t);
+  if (/^[+-]?(?:nan|inf|infinity)$/i.test(t)) return /nan/i.test(t) ? Number.NaN : Infinity;
+  return void 0;
+}
+function notFinite(file, pointer, what, got) {
+  const nonFinite = parseDecimal2(got) !== void 0;
+  return {
+    file,
+    pointer,
+    expected: `${what} must be a finite number`,
+    got: quote(got),
+    ...nonFinite ? {
+      hint: "The run logged NaN or infinity here (it may have diverged); cut the log before this point or pick another series."
+    } : {}
+  };
+}
+var PointBudget = class {
+  constructor(limit = MAX_POINTS2) {
+    this.limit = limit;
+  }
+  limit;
+  used = 0;
+  take(file, pointer) {
+    this.used++;
+    if (this.used > this.limit) {
+      throw new InputError([
+        {
+          file,
+          pointer,
+          expected: `holds more than ${this.limit.toLocaleString("en-US")} points, the most one import reads`,
+          hint: "Import fewer files, or log less often (per epoch rather than per step)."
+        }
+      ]);
+    }
+  }
+};
+
+// src/artifact/curve-logs/csv-log.ts
+function splitCsvLine2(line) {
+  if (!line.includes('"')) return line.split(",").map((cell2) => cell2.trim());
+  const cells = [];
+  let cell = "";
+  let quoted = false;
+  for (let i = 0; i < line.length; i++) {
+    const c = line[i];
+    if (quoted) {
+      if (c === '"') {
+        if (line[i + 1] === '"') {
+          cell += '"';
+          i++;
+        } else quoted = false;
+      } else cell += c;
+    } else if (c === '"' && cell.trim() === "") {
+      cell = "";
+      quoted = true;
+    } else if (c === ",") {
+      cells.push(cell.trim());
+      cell = "";
+    } else cell += c;
+  }
+  if (quoted) return null;
+  cells.push(cell.trim());
+  return cells;
+}
+function structural(file, line, expected, got, hint) {
+  const issue = { file, pointer: `line ${line}`, expected };
+  if (got !== void 0) issue.got = got;
+  if (hint !== void 0) issue.hint = hint;
+  return new InputError([issue]);
+}
+function readCsvLog(input, file, options = {}) {
+  const text2 = decodeText(input, file, "a CSV log");
+  const budget = options.budget ?? new PointBudget();
+  const lines = text2.split(/\r?\n/);
+  const header = splitCsvLine2(lines[0] ?? "");
+  if (header === null || header.every((h) => h === "")) {
+    throw structural(
+      file,
+      1,
+      'must be a header row naming the columns, such as "epoch,loss,val_loss"',
+      quote(lines[0] ?? "")
+    );
+  }
+  if (header.length > MAX_SERIES + 1)
+    throw structural(file, 1, `must have at most ${MAX_SERIES} columns`, `${header.length}`);
+  const seen = /* @__PURE__ */ new Set();
+  for (const name of header) {
+    if (name === "" || seen.has(name))
+      throw structural(
+        file,
+        1,
+        "must name every column once",
+        quote(name),
+        "Give each column a distinct, non-empty name."
+      );
+    seen.add(name);
+  }
+  const xName = options.x ?? (seen.has("epoch") ? "epoch" : seen.has("step") ? "step" : void 0);
+  const xi = xName === void 0 ? -1 : header.indexOf(xName);
+  if (xName === void 0 || xi < 0) {
+    throw structural(
+      file,
+      1,
+      xName === void 0 ? 'must have an "epoch" or "step" column for x' : `must have the column "${xName}"`,
+      quote(header.join(",")),
+      xName === void 0 ? "Name the x column (--x, or x in the config)." : "Name one of the header columns."
+    );
+  }
+  const where = { kind: "line" };
+  const series = header.map((name) => ({
+    name,
+    file,
+    x: xName,
+    where,
+    points: [],
+    problems: []
+  }));
+  const xIssues = [];
+  for (let i = 1; i < lines.length && xIssues.length < 10; i++) {
+    const raw = lines[i] ?? "";
+    if (raw.trim() === "") continue;
+    const line = i + 1;
+    const cells = splitCsvLine2(raw);
+    if (cells === null) throw structural(file, line, "must close every quoted cell", quote(raw));
+    if (cells.length > header.length)
+      throw structural(
+        file,
+        line,
+        `must have at most ${header.length} cells, one per header column`,
+        `${cells.length}`,
+        "Quote cells that contain commas, or fix the header."
+      );
+    const xCell = cells[xi] ?? "";
+    const x = xCell === "" ? Number.NaN : parseDecimal2(xCell);
+    if (x === void 0 || !Number.isFinite(x)) {
+      xIssues.push(notFinite(file, `line ${line}`, `column "${xName}"`, xCell));
+      continue;
+    }
+    for (let c = 0; c < header.length; c++) {
+      const cell = cells[c] ?? "";
+      const s = series[c];
+      if (c === xi || cell === "" || s === void 0) continue;
+      const value2 = parseDecimal2(cell);
+      if (value2 === void 0 || !Number.isFinite(value2)) {
+        if (s.problems.length < 10)
+          s.problems.push(notFinite(file, `line ${line}`, `column "${s.name}"`, cell));
+        continue;
+      }
+      budget.take(file, `line ${line}`);
+      s.points.push({ x, value: value2, at: line });
+    }
+  }
+  if (xIssues.length > 0) throw new InputError(xIssues);
+  return { series: series.filter((_, c) => c !== xi), warnings: [] };
+}
+
+// src/artifact/curve-logs/protobuf.ts
+var MalformedProto = class extends Error {
+  constructor(message) {
+    super(message);
+    this.name = "MalformedProto";
+  }
+};
+var WIRE = { varint: 0, fixed64: 1, bytes: 2, fixed32: 5 };
+var SCRATCH = new Uint8Array(8);
+var SCRATCH_VIEW = new DataView(SCRATCH.buffer);
+var ProtoReader = class {
+  constructor(buf, start = 0, end = buf.length) {
+    this.buf = buf;
+    this.pos = start;
+    this.end = end;
+  }
+  buf;
+  pos;
+  end;
+  done() {
+    return this.pos >= this.end;
+  }
+  /** Field number and wire type of the next field. */
+  tag() {
+    const key = this.varint();
+    const field = Math.floor(key / 8);
+    if (field < 1) throw new MalformedProto(`field number 0 at byte ${this.pos}`);
+    return { field, wire: key % 8 };
+  }
+  /** An unsigned varint as a number (exact up to 2^53). */
+  varint() {
+    let result = 0;
+    let scale = 1;
+    for (let i = 0; i < 10; i++) {
+      if (this.pos >= this.end) throw new MalformedProto("varint runs past the end");
+      const b = this.buf[this.pos++];
+      result += (b & 127) * scale;
+      if ((b & 128) === 0) return result;
+      scale *= 128;
+    }
+    throw new MalformedProto("varint longer than 10 bytes");
+  }
+  /** A varint read as a two's-complement int64 (negative steps take 10 bytes). */
+  int64() {
+    const start = this.pos;
+    const unsigned = this.varint();
+    if (unsigned < 2 ** 53) return unsigned;
+    let value2 = 0n;
+    let shift = 0n;
+    for (let p = start; p < this.pos; p++) {
+      value2 |= BigInt(this.buf[p] & 127) << shift;
+      shift += 7n;
+    }
+    return Number(BigInt.asIntN(64, value2));
+  }
+  /** Copies a fixed-width field into the scratch buffer (little-endian, as the wire is). */
+  fixed(size) {
+    if (this.end - this.pos < size) throw new MalformedProto("fixed field runs past the end");
+    for (let i = 0; i < size; i++) SCRATCH[i] = this.buf[this.pos + i];
+    this.pos += size;
+  }
+  float() {
+    this.fixed(4);
+    return SCRATCH_VIEW.getFloat32(0, true);
+  }
+  double() {
+    this.fixed(8);
+    return SCRATCH_VIEW.getFloat64(0, true);
+  }
+  /** A length-delimited field's bytes (a view, not a copy). */
+  bytes() {
+    const length = this.varint();
+    if (length > this.end - this.pos) throw new MalformedProto("length runs past the end");
+    const out = this.buf.subarray(this.pos, this.pos + length);
+    this.pos += length;
+    return out;
+  }
+  skip(wire) {
+    if (wire === WIRE.varint) this.varint();
+    else if (wire === WIRE.fixed64) this.fixed(8);
+    else if (wire === WIRE.bytes) this.bytes();
+    else if (wire === WIRE.fixed32) this.fixed(4);
+    else throw new MalformedProto(`unsupported wire type ${wire}`);
+  }
+};
+function readRepeated(reader, wire, scalarWire, one, out) {
+  if (wire === scalarWire) {
+    out.push(one(reader));
+    return;
+  }
+  if (wire !== WIRE.bytes) throw new MalformedProto(`unexpected wire type ${wire}`);
+  const run = reader.bytes();
+  const inner = new ProtoReader(run);
+  while (!inner.done()) out.push(one(inner));
+}
+var decoder2 = new TextDecoder("utf-8", { fatal: true });
+function utf8(bytes) {
+  try {
+    return decoder2.decode(bytes);
+  } catch {
+    throw new MalformedProto("string field is not UTF-8");
+  }
+}
+
+// src/artifact/curve-logs/crc32c.ts
+var TABLE2 = (() => {
+  const table2 = new Uint32Array(256);
+  for (let n = 0; n < 256; n++) {
+    let c = n;
+    for (let k = 0; k < 8; k++) c = c & 1 ? c >>> 1 ^ 2197175160 : c >>> 1;
+    table2[n] = c >>> 0;
+  }
+  return table2;
+})();
+function crc32c(bytes, start = 0, end = bytes.length) {
+  let crc = 4294967295;
+  for (let i = start; i < end; i++) {
+    crc = TABLE2[(crc ^ bytes[i]) & 255] ^ crc >>> 8;
+  }
+  return (crc ^ 4294967295) >>> 0;
+}
+function maskCrc(crc) {
+  return (crc >>> 15 | crc << 17) + 2726488792 >>> 0;
+}
+
+// src/artifact/curve-logs/tfrecord.ts
+function readUint32(bytes, at) {
+  return (bytes[at] | bytes[at + 1] << 8 | bytes[at + 2] << 16 | bytes[at + 3] << 24) >>> 0;
+}
+function readTfRecords(bytes, file) {
+  const records = [];
+  let offset = 0;
+  let number = 0;
+  while (offset < bytes.length) {
+    number++;
+    const where = `record ${number} (byte ${offset})`;
+    if (bytes.length - offset < 12) return { records, truncatedAt: offset };
+    if (maskCrc(crc32c(bytes, offset, offset + 8)) !== readUint32(bytes, offset + 8)) {
+      throw new InputError([
+        {
+          file,
+          pointer: where,
+          expected: "must start with a record length whose checksum matches",
+          hint: "The file is damaged or is not a TensorBoard event file (events.out.tfevents.*)."
+        }
+      ]);
+    }
+    const high = readUint32(bytes, offset + 4);
+    const length = readUint32(bytes, offset);
+    const start = offset + 12;
+    if (high === 0 && length > bytes.length - start - 4) return { records, truncatedAt: offset };
+    if (high !== 0) {
+      throw new InputError([
+        {
+          file,
+          pointer: where,
+          expected: "must have a record length under 4 GiB",
+          got: `${high * 2 ** 32 + length} bytes`
+        }
+      ]);
+    }
+    const end = start + length;
+    if (maskCrc(crc32c(bytes, start, end)) !== readUint32(bytes, end)) {
+      throw new InputError([
+        {
+          file,
+          pointer: where,
+          expected: "must hold data whose checksum matches",
+          hint: "The file is damaged; TensorBoard would stop reading it here too."
+        }
+      ]);
+    }
+    records.push({ data: bytes.subarray(start, end), number, offset });
+    offset = end + 4;
+  }
+  return { records };
+}
+
+// src/artifact/curve-logs/tensorboard.ts
+var DT = { float: 1, double: 2, int32: 3, int64: 9, half: 19 };
+function shortestFloat32(value2) {
+  if (!Number.isFinite(value2) || value2 === 0) return value2;
+  for (let digits2 = 1; digits2 <= 9; digits2++) {
+    const candidate = Number(value2.toPrecision(digits2));
+    if (Math.fround(candidate) === value2) return candidate;
+  }
+  return value2;
+}
+function halfToNumber(bits) {
+  const sign = bits & 32768 ? -1 : 1;
+  const exponent = bits >> 10 & 31;
+  const fraction = bits & 1023;
+  if (exponent === 0) return sign * 2 ** -14 * (fraction / 1024);
+  if (exponent === 31) return fraction === 0 ? sign * Infinity : Number.NaN;
+  return sign * 2 ** (exponent - 15) * (1 + fraction / 1024);
+}
+function shapeSize(bytes) {
+  const reader = new ProtoReader(bytes);
+  let size = 1;
+  while (!reader.done()) {
+    const { field, wire } = reader.tag();
+    if (field === 2 && wire === WIRE.bytes) {
+      const dim = new ProtoReader(reader.bytes());
+      let n = 0;
+      while (!dim.done()) {
+        const t = dim.tag();
+        if (t.field === 1 && t.wire === WIRE.varint) n = dim.int64();
+        else dim.skip(t.wire);
+      }
+      size *= n;
+    } else reader.skip(wire);
+  }
+  return size;
+}
+function fromContent(content, dtype) {
+  const width = { [DT.float]: 4, [DT.double]: 8, [DT.int32]: 4, [DT.int64]: 8, [DT.half]: 2 }[dtype];
+  if (width === void 0 || content.length !== width) return void 0;
+  const view = new DataView(content.buffer, content.byteOffset, width);
+  if (dtype === DT.float) return shortestFloat32(view.getFloat32(0, true));
+  if (dtype === DT.double) return view.getFloat64(0, true);
+  if (dtype === DT.int32) return view.getInt32(0, true);
+  if (dtype === DT.int64) return Number(view.getBigInt64(0, true));
+  return halfToNumber(view.getUint16(0, true));
+}
+function scalarOfTensor(bytes) {
+  const reader = new ProtoReader(bytes);
+  let dtype = 0;
+  let size = 1;
+  let content;
+  const values = [];
+  while (!reader.done()) {
+    const { field, wire } = reader.tag();
+    if (field === 1 && wire === WIRE.varint) dtype = reader.varint();
+    else if (field === 2 && wire === WIRE.bytes) size = shapeSize(reader.bytes());
+    else if (field === 4 && wire === WIRE.bytes) content = reader.bytes();
+    else if (field === 5)
+      readRepeated(reader, wire, WIRE.fixed32, (r) => shortestFloat32(r.float()), values);
+    else if (field === 6) readRepeated(reader, wire, WIRE.fixed64, (r) => r.double(), values);
+    else if (field === 7 || field === 10)
+      readRepeated(reader, wire, WIRE.varint, (r) => r.int64(), values);
+    else if (field === 13)
+      readRepeated(reader, wire, WIRE.varint, (r) => halfToNumber(r.varint() & 65535), values);
+    else reader.skip(wire);
+  }
+  if (size !== 1 || !Object.values(DT).includes(dtype)) return void 0;
+  if (content !== void 0 && content.length > 0) return fromContent(content, dtype);
+  return values.length === 1 ? values[0] : void 0;
+}
+function pluginName(bytes) {
+  const reader = new ProtoReader(bytes);
+  let name;
+  while (!reader.done()) {
+    const { field, wire } = reader.tag();
+    if (field === 1 && wire === WIRE.bytes) {
+      const data = new ProtoReader(reader.bytes());
+      while (!data.done()) {
+        const t = data.tag();
+        if (t.field === 1 && t.wire === WIRE.bytes) name = utf8(data.bytes());
+        else data.skip(t.wire);
+      }
+    } else reader.skip(wire);
+  }
+  return name;
+}
+function readValue(bytes) {
+  const reader = new ProtoReader(bytes);
+  const out = { tag: "", value: void 0 };
+  while (!reader.done()) {
+    const { field, wire } = reader.tag();
+    if (field === 1 && wire === WIRE.bytes) out.tag = utf8(reader.bytes());
+    else if (field === 2 && wire === WIRE.fixed32) out.value = shortestFloat32(reader.float());
+    else if (field === 8 && wire === WIRE.bytes) out.value = scalarOfTensor(reader.bytes());
+    else if (field === 9 && wire === WIRE.bytes) {
+      const plugin = pluginName(reader.bytes());
+      if (plugin !== void 0) out.plugin = plugin;
+    } else reader.skip(wire);
+  }
+  return out;
+}
+function readEvent(bytes) {
+  const reader = new ProtoReader(bytes);
+  let step = 0;
+  const summaries = [];
+  while (!reader.done()) {
+    const { field, wire } = reader.tag();
+    if (field === 2 && wire === WIRE.varint) step = reader.int64();
+    else if (field === 5 && wire === WIRE.bytes) summaries.push(reader.bytes());
+    else reader.skip(wire);
+  }
+  const values = [];
+  for (const summary of summaries) {
+    const s = new ProtoReader(summary);
+    while (!s.done()) {
+      const { field, wire } = s.tag();
+      if (field === 1 && wire === WIRE.bytes) values.push(readValue(s.bytes()));
+      else s.skip(wire);
+    }
+  }
+  return { step, values };
+}
+function readTensorBoard(bytes, file, options = {}) {
+  if (bytes.length > MAX_EVENT_FILE_BYTES) {
+    throw new InputError([
+      {
+        file,
+        pointer: "",
+        expected: `must be at most ${MAX_EVENT_FILE_BYTES / 1024 / 1024} MiB`,
+        got: `${bytes.length} bytes`,
+        hint: "Import the event file of the scalars only, or split the run."
+      }
+    ]);
+  }
+  const budget = options.budget ?? new PointBudget();
+  const { records, truncatedAt } = readTfRecords(bytes, file);
+  const byTag = /* @__PURE__ */ new Map();
+  const otherPlugin = /* @__PURE__ */ new Set();
+  let skipped = 0;
+  const where = { kind: "record" };
+  for (const record of records) {
+    let event;
+    try {
+      event = readEvent(record.data);
+    } catch (error) {
+      if (!(error instanceof MalformedProto)) throw error;
+      throw new InputError([
+        {
+          file,
+          pointer: `record ${record.number} (byte ${record.offset})`,
+          expected: "must hold a TensorBoard Event message",
+          got: error.message,
+          hint: "Name an events.out.tfevents.* file written by TensorBoard, PyTorch or Keras."
+        }
+      ]);
+    }
+    for (const v of event.values) {
+      if (v.plugin !== void 0 && v.plugin !== "scalars") otherPlugin.add(v.tag);
+      if (v.tag === "" || otherPlugin.has(v.tag)) continue;
+      if (v.value === void 0) {
+        skipped++;
+        continue;
+      }
+      let series = byTag.get(v.tag);
+      if (series === void 0) {
+        if (byTag.size >= MAX_SERIES)
+          throw new InputError([
+            {
+              file,
+              pointer: `record ${record.number}`,
+              expected: `must hold at most ${MAX_SERIES} scalar tags`
+            }
+          ]);
+        series = { name: v.tag, file, x: "step", where, points: [], problems: [] };
+        byTag.set(v.tag, series);
+      }
+      if (!Number.isFinite(v.value)) {
+        if (series.problems.length < 10)
+          series.problems.push({
+            file,
+            pointer: `record ${record.number}`,
+            expected: `tag "${v.tag}" must be a finite number`,
+            got: String(v.value),
+            hint: "The run logged NaN or infinity here (it may have diverged); pick another series or cut the run."
+          });
+        continue;
+      }
+      budget.take(file, `record ${record.number}`);
+      series.points.push({ x: event.step, value: v.value, at: record.number });
+    }
+  }
+  const warnings = [];
+  if (skipped > 0) warnings.push({ code: "non-scalar-skipped", file, count: skipped });
+  if (truncatedAt !== void 0)
+    warnings.push({ code: "truncated-record", file, offset: truncatedAt });
+  return { series: [...byTag.values()], warnings };
+}
+
+// src/artifact/curve-logs/mlflow.ts
+var INTEGER = /^[+-]?\d+$/;
+function readMlflowMetric(input, file, key, options = {}) {
+  const text2 = decodeText(input, file, "an MLflow metric file");
+  const budget = options.budget ?? new PointBudget();
+  const series = {
+    name: key,
+    file,
+    x: "step",
+    where: { kind: "line" },
+    points: [],
+    problems: []
+  };
+  const lines = text2.split(/\r?\n/);
+  for (let i = 0; i < lines.length; i++) {
+    const raw = lines[i] ?? "";
+    if (raw.trim() === "") continue;
+    const line = i + 1;
+    const fields = raw.trim().split(/\s+/);
+    const [timestamp, valueText, stepText = "0"] = fields;
+    if (fields.length < 2 || fields.length > 3 || !INTEGER.test(timestamp ?? "") || !INTEGER.test(stepText)) {
+      throw new InputError([
+        {
+          file,
+          pointer: `line ${line}`,
+          expected: 'must be "timestamp value step" (whole-number timestamp and step)',
+          got: quote(raw),
+          hint: "Name a metric file under mlruns/<experiment>/<run>/metrics/."
+        }
+      ]);
+    }
+    const value2 = parseDecimal2(valueText ?? "");
+    if (value2 === void 0 || !Number.isFinite(value2)) {
+      if (series.problems.length < 10)
+        series.problems.push(notFinite(file, `line ${line}`, `metric "${key}"`, valueText ?? ""));
+      continue;
+    }
+    budget.take(file, `line ${line}`);
+    series.points.push({ x: Number(stepText), value: value2, at: line });
+  }
+  return { series: [series], warnings: [] };
+}
+
+// src/artifact/curve-logs/evals-result.ts
+function isObject(value2) {
+  return typeof value2 === "object" && value2 !== null && !Array.isArray(value2);
+}
+function escapePointer(segment) {
+  return segment.replace(/~/g, "~0").replace(/\//g, "~1");
+}
+function readEvalsResult(input, file, options = {}) {
+  const text2 = decodeText(input, file, "an evals_result JSON file");
+  const budget = options.budget ?? new PointBudget();
+  let doc;
+  try {
+    doc = parseJson(text2, file);
+  } catch (error) {
+    const nan = /[:[,]\s*-?(?:NaN|Infinity)\b/.exec(text2);
+    if (!(error instanceof InputError) || nan === null) throw error;
+    const issue = error.issues[0];
+    throw new InputError([
+      {
+        file,
+        pointer: issue?.pointer ?? "",
+        expected: "must be JSON without NaN or Infinity",
+        got: quote(nan[0].replace(/^[:[,]\s*/, "")),
+        hint: "A round logged a non-finite value; cut the rounds after it, or dump with allow_nan=False to find it."
+      }
+    ]);
+  }
+  const shape = (pointer, expected, got) => new InputError([
+    {
+      file,
+      pointer,
+      expected,
+      got: quote(got),
+      hint: `Write the booster's evals_result as JSON: {"train": {"logloss": [...]}, "eval": {...}}.`
+    }
+  ]);
+  if (!isObject(doc) || Object.keys(doc).length === 0)
+    throw shape("", "must be an object of eval sets, each an object of metric arrays", doc);
+  const series = [];
+  const names2 = /* @__PURE__ */ new Set();
+  for (const [set, metrics] of Object.entries(doc)) {
+    const setPointer = `/${escapePointer(set)}`;
+    if (!isObject(metrics))
+      throw shape(
+        setPointer,
+        'must be an object of metric arrays, such as {"logloss": [...]}',
+        metrics
+      );
+    for (const [metric, values] of Object.entries(metrics)) {
+      const path = `${setPointer}/${escapePointer(metric)}`;
+      if (!Array.isArray(values))
+        throw shape(path, "must be an array with one value per boosting round", values);
+      if (series.length >= MAX_SERIES)
+        throw shape(path, `must hold at most ${MAX_SERIES} eval-set metrics`, metric);
+      const name = `${set}/${metric}`;
+      if (names2.has(name))
+        throw shape(path, `must give a series name of its own, but "${name}" is taken`, metric);
+      names2.add(name);
+      const s = {
+        name,
+        file,
+        x: "round",
+        where: { kind: "json", path },
+        points: [],
+        problems: []
+      };
+      values.forEach((value2, i) => {
+        if (typeof value2 !== "number" || !Number.isFinite(value2)) {
+          if (s.problems.length < 10)
+            s.problems.push({
+              file,
+              pointer: `${path}/${i}`,
+              expected: "must be a finite number",
+              got: quote(value2)
+            });
+          return;
+        }
+        budget.take(file, `${path}/${i}`);
+        s.points.push({ x: i + 1, value: value2, at: i });
+      });
+      series.push(s);
+    }
+  }
+  return { series, warnings: [] };
+}
+
+// src/artifact/curve-logs/x-axis.ts
+function isEpochSeries(s) {
+  const leaf = s.name.slice(s.name.lastIndexOf("/") + 1).toLowerCase();
+  return leaf === "epoch";
+}
+function stepsToEpochs(read, file) {
+  const epochSeries = read.series.filter(isEpochSeries);
+  if (epochSeries.length === 0) {
+    throw new InputError([
+      {
+        file,
+        pointer: "",
+        expected: 'must log an "epoch" series to use epochs as x',
+        hint: "Leave out --x epoch to use the logged steps as x."
+      }
+    ]);
+  }
+  const byFolder = /* @__PURE__ */ new Map();
+  for (const s of epochSeries) {
+    const folder = s.name.slice(0, s.name.lastIndexOf("/") + 1);
+    const list = byFolder.get(folder) ?? [];
+    for (const p of s.points) list.push({ step: p.x, epoch: p.value });
+    byFolder.set(folder, list);
+  }
+  for (const list of byFolder.values()) list.sort((a, b) => a.step - b.step);
+  const fallback = byFolder.get("") ?? (byFolder.size === 1 ? [...byFolder.values()][0] : void 0);
+  const epochAt = (list, step) => {
+    let lo = 0;
+    let hi = list.length - 1;
+    let found;
+    while (lo <= hi) {
+      const mid = lo + hi >> 1;
+      const entry = list[mid];
+      if (entry.step <= step) {
+        found = entry.epoch;
+        lo = mid + 1;
+      } else hi = mid - 1;
+    }
+    return found;
+  };
+  const series = [];
+  for (const s of read.series) {
+    if (isEpochSeries(s)) continue;
+    const folder = s.name.slice(0, s.name.lastIndexOf("/") + 1);
+    const list = byFolder.get(folder) ?? fallback;
+    if (list === void 0) continue;
+    const points = [];
+    for (const p of s.points) {
+      const epoch = epochAt(list, p.x);
+      if (epoch !== void 0) points.push({ ...p, x: epoch });
+    }
+    series.push({ ...s, x: "epoch", points });
+  }
+  return { series, warnings: read.warnings };
+}
+
+// src/artifact/curve-logs/names.ts
+var TRAIN_WORDS = /* @__PURE__ */ new Set(["train", "training", "learn", "trn"]);
+var VALIDATION_RANK = /* @__PURE__ */ new Map([
+  ["val", 0],
+  ["valid", 0],
+  ["validation", 0],
+  ["eval", 0],
+  ["evaluation", 0],
+  ["dev", 0],
+  ["test", 3]
+]);
+var NUMBERED = /^(?:val|valid|validation|eval)_(\d+)$/;
+var NOT_A_METRIC = /^(?:epochs?|steps?|global_step|iter(?:ation)?s?|batch(?:es)?|lr|learning_rate|lr[-_].*|time.*|duration|hp_metric|momentum|weight_decay|grad_norm)$/;
+function roleOfWord(word2) {
+  const w = word2.toLowerCase();
+  if (TRAIN_WORDS.has(w)) return { role: "train", rank: 0 };
+  const rank = VALIDATION_RANK.get(w);
+  if (rank !== void 0) return { role: "validation", rank };
+  const numbered = NUMBERED.exec(w);
+  if (numbered?.[1] !== void 0)
+    return { role: "validation", rank: 1 + Number(numbered[1]) / 1e6 };
+  return void 0;
+}
+function normalizeBase(text2) {
+  let base = text2.toLowerCase();
+  let stage = 0;
+  const last = base.lastIndexOf("/") + 1;
+  let leaf = base.slice(last);
+  if (leaf.startsWith("epoch_") && leaf.length > 6) leaf = leaf.slice(6);
+  const suffix = /^(.+)_(epoch|step)$/.exec(leaf);
+  if (suffix?.[1] !== void 0) {
+    leaf = suffix[1];
+    stage = suffix[2] === "epoch" ? 0.1 : 0.2;
+  }
+  base = base.slice(0, last) + leaf;
+  return { base, stage };
+}
+function parseName(name) {
+  const segments = name.split("/");
+  for (let i = segments.length - 1; i >= 0; i--) {
+    const found = roleOfWord(segments[i] ?? "");
+    if (found === void 0) continue;
+    const after = segments.slice(i + 1).join("/");
+    const before = segments.slice(0, i).join("/");
+    const { base: base2, stage: stage2 } = normalizeBase(after !== "" ? after : before);
+    if (base2 === "" || NOT_A_METRIC.test(base2.slice(base2.lastIndexOf("/") + 1))) return void 0;
+    return {
+      name,
+      role: found.role,
+      base: base2,
+      qualifier: after !== "" ? before.toLowerCase() : "",
+      rank: found.rank + stage2,
+      set: (segments[i] ?? "").toLowerCase()
+    };
+  }
+  const leaf = segments[segments.length - 1] ?? "";
+  const qualifier = segments.slice(0, -1).join("/").toLowerCase();
+  let role = "train";
+  let rank = 0.5;
+  let rest = leaf;
+  const prefix = /^([A-Za-z]+(?:_\d+)?)_(.+)$/.exec(leaf);
+  const suffix = /^(.+)_([A-Za-z]+)$/.exec(leaf);
+  const byPrefix = prefix?.[1] === void 0 ? void 0 : roleOfWord(prefix[1]);
+  const bySuffix = suffix?.[2] === void 0 ? void 0 : roleOfWord(suffix[2]);
+  if (byPrefix !== void 0 && prefix?.[2] !== void 0) {
+    ({ role, rank } = byPrefix);
+    rest = prefix[2];
+  } else if (bySuffix !== void 0 && suffix?.[1] !== void 0) {
+    ({ role, rank } = bySuffix);
+    rest = suffix[1];
+  }
+  const { base, stage } = normalizeBase(rest);
+  if (base === "" || NOT_A_METRIC.test(base)) return void 0;
+  return { name, role, base, qualifier, rank: rank + stage };
+}
+
+// src/artifact/curve-logs/units.ts
+var FAMILY = /* @__PURE__ */ new Map();
+var add = (family, names2) => names2.forEach((n) => FAMILY.set(n, family));
+add("accuracy", [
+  "accuracy",
+  "acc",
+  "binary_accuracy",
+  "categorical_accuracy",
+  "sparse_categorical_accuracy",
+  "top1_accuracy"
+]);
+add("error", [
+  "error",
+  "err",
+  "error_rate",
+  "binary_error",
+  "multi_error",
+  "merror",
+  "misclassification_rate",
+  "zero_one_loss"
+]);
+add("loss", ["loss", "total_loss", "objective"]);
+add("logloss", [
+  "logloss",
+  "log_loss",
+  "binary_logloss",
+  "multi_logloss",
+  "mlogloss",
+  "cross_entropy",
+  "crossentropy",
+  "binary_crossentropy",
+  "categorical_crossentropy",
+  "sparse_categorical_crossentropy",
+  "nll",
+  "multiclass"
+]);
+add("rmse", ["rmse", "root_mean_squared_error"]);
+add("mse", ["mse", "l2", "mean_squared_error"]);
+add("mae", ["mae", "l1", "mean_absolute_error"]);
+add("auc", ["auc", "roc_auc", "auroc"]);
+add("r2", ["r2", "r2_score", "r_squared"]);
+function normalizeMetricName(name) {
+  return name.toLowerCase().replace(/[^a-z0-9]+/g, "_").replace(/^_+|_+$/g, "");
+}
+function familyOf(name) {
+  const leaf = name.slice(name.lastIndexOf("/") + 1);
+  return FAMILY.get(normalizeMetricName(leaf));
+}
+function isLoss(family) {
+  return family === "loss" || family === "logloss";
+}
+var CONVERSIONS = /* @__PURE__ */ new Map([
+  ["accuracy>error", "one-minus"],
+  ["error>accuracy", "one-minus"],
+  ["mse>rmse", "sqrt"],
+  ["rmse>mse", "square"]
+]);
+function convert(conversion, value2) {
+  if (conversion === "one-minus") return 1 - value2;
+  if (conversion === "sqrt") return Math.sqrt(value2);
+  return value2 * value2;
+}
+function matchScore(base, metric) {
+  const b = normalizeMetricName(base.slice(base.lastIndexOf("/") + 1));
+  const m = normalizeMetricName(metric);
+  if (b === m) return 0;
+  const bf = familyOf(b);
+  const mf = familyOf(m);
+  if (bf === void 0 || mf === void 0) return void 0;
+  if (bf === mf) return 1;
+  return CONVERSIONS.has(`${bf}>${mf}`) ? 2 : void 0;
+}
+function unitsFor(base, series, metric) {
+  const bf = familyOf(base);
+  if (metric === void 0) {
+    return {
+      warning: isLoss(bf) ? { code: "loss-not-metric", series } : { code: "units-unchecked", series }
+    };
+  }
+  const score = matchScore(base, metric);
+  if (score === 0 || score === 1) return {};
+  const mf = familyOf(metric);
+  const conversion = bf !== void 0 && mf !== void 0 ? CONVERSIONS.get(`${bf}>${mf}`) : void 0;
+  if (conversion !== void 0)
+    return { conversion, warning: { code: "converted", series, metric, conversion } };
+  if (isLoss(bf)) return { warning: { code: "loss-not-metric", series, metric } };
+  return { warning: { code: "units-unchecked", series, metric } };
+}
+
+// src/artifact/curve-logs/picker.ts
+var byRank = (a, b) => a.rank - b.rank;
+function groups(series) {
+  const map = /* @__PURE__ */ new Map();
+  series.forEach((s, index) => {
+    const parts = parseName(s.name);
+    if (parts === void 0) return;
+    const key = `${parts.qualifier}\0${parts.base}`;
+    let group = map.get(key);
+    if (group === void 0) {
+      group = {
+        base: parts.base,
+        qualifier: parts.qualifier,
+        train: [],
+        validation: [],
+        last: index
+      };
+      map.set(key, group);
+    }
+    group[parts.role].push(parts);
+    group.last = index;
+  });
+  for (const g of map.values()) {
+    g.train.sort(byRank);
+    g.validation.sort(byRank);
+  }
+  return [...map.values()];
+}
+function guessPositional(g) {
+  const positional = g.validation.filter((p) => /^validation_\d+$/.test(p.set ?? ""));
+  if (g.train.length > 0 || positional.length < 2 || positional.length !== g.validation.length)
+    return void 0;
+  const [train, validation] = positional;
+  return train === void 0 || validation === void 0 ? void 0 : { train, validation };
+}
+function notFound(catalogue, name, series, flag) {
+  const names2 = series.map((s) => s.name);
+  const close = names2.find((n) => n.toLowerCase() === name.toLowerCase());
+  const listed = names2.slice(0, 12).map((n) => JSON.stringify(n)).join(", ");
+  return new InputError([
+    {
+      file: catalogue.file,
+      pointer: catalogue.pointer,
+      expected: `must have the ${catalogue.noun} "${name}" (${flag})`,
+      got: names2.length === 0 ? "none" : `${listed}${names2.length > 12 ? ", \u2026" : ""}`,
+      hint: close !== void 0 ? `Names are case-sensitive: did you mean "${close}"?` : `Name one of the ${catalogue.noun}s listed.`
+    }
+  ]);
+}
+function partner(all, name, role) {
+  const parts = parseName(name);
+  if (parts === void 0) return void 0;
+  const group = all.find((g) => g.base === parts.base && g.qualifier === parts.qualifier);
+  return group?.[role][0]?.name;
+}
+function pickByFlags(series, options, catalogue) {
+  const find = (name, flag) => {
+    const s = series.find((x) => x.name === name);
+    if (s === void 0) throw notFound(catalogue, name, series, flag);
+    return s;
+  };
+  const all = groups(series);
+  const lookUp = options.exact !== true;
+  const validationName = options.validation ?? (options.train === void 0 || !lookUp ? void 0 : partner(all, options.train, "validation"));
+  if (validationName === void 0) {
+    throw new InputError([
+      {
+        file: catalogue.file,
+        pointer: catalogue.pointer,
+        expected: `must have a validation ${catalogue.noun} to go with "${options.train}"`,
+        hint: "Name it with --validation."
+      }
+    ]);
+  }
+  const validation = find(validationName, "validation");
+  const trainName = options.train ?? (options.validation === void 0 || !lookUp ? void 0 : partner(all, validationName, "train"));
+  const train = trainName === void 0 ? void 0 : find(trainName, "train");
+  const warnings = [];
+  if (train === void 0) warnings.push({ code: "no-train-series", validation: validation.name });
+  return {
+    validation,
+    ...train === void 0 ? {} : { train },
+    by: "flags",
+    base: parseName(validationName)?.base ?? validationName,
+    alternatives: [],
+    warnings
+  };
+}
+function pickSeries(series, options, catalogue) {
+  if (options.train !== void 0 || options.validation !== void 0)
+    return pickByFlags(series, options, catalogue);
+  const all = groups(series).filter((g) => g.validation.length > 0);
+  if (all.length === 0) {
+    throw new InputError([
+      {
+        file: catalogue.file,
+        pointer: catalogue.pointer,
+        expected: `must have a validation ${catalogue.noun} (such as "val_loss", "val/loss" or an eval set)`,
+        got: series.length === 0 ? "none" : series.slice(0, 12).map((s) => JSON.stringify(s.name)).join(", "),
+        hint: "Name the series to use with --validation (and --train)."
+      }
+    ]);
+  }
+  const metric = options.metric;
+  const score = (g) => {
+    const m = metric === void 0 ? void 0 : matchScore(g.base, metric);
+    if (m !== void 0) return m;
+    return g.base === "loss" ? 10 : 20 - g.last / (series.length + 1);
+  };
+  const ranked = [...all].sort((a, b) => score(a) - score(b));
+  const best = ranked[0];
+  const rivals = ranked.filter((g) => g.base === best.base && g.qualifier !== best.qualifier);
+  if (rivals.length > 0) {
+    const runs = [best, ...rivals].map(
+      (g) => quote(g.qualifier === "" ? "(top level)" : g.qualifier)
+    );
+    throw new InputError([
+      {
+        file: catalogue.file,
+        pointer: "",
+        expected: `must hold one run, but several log "${best.base}"`,
+        got: runs.join(", "),
+        hint: "Name one run folder as PATH, or name the series with --train and --validation."
+      }
+    ]);
+  }
+  const warnings = [];
+  const guessed = guessPositional(best);
+  const validationParts = guessed?.validation ?? best.validation[0];
+  const trainParts = guessed?.train ?? best.train[0];
+  if (guessed !== void 0)
+    warnings.push({
+      code: "eval-sets-guessed",
+      train: guessed.train.name,
+      validation: guessed.validation.name
+    });
+  const validation = series.find((s) => s.name === validationParts.name);
+  const train = trainParts === void 0 ? void 0 : series.find((s) => s.name === trainParts.name);
+  if (train === void 0) warnings.push({ code: "no-train-series", validation: validation.name });
+  return {
+    validation,
+    ...train === void 0 ? {} : { train },
+    by: "names",
+    base: best.base,
+    alternatives: ranked.slice(1).map((g) => g.validation[0].name),
+    warnings
+  };
+}
+
+// src/artifact/curve-logs/types.ts
+var CURVE_LOG_FORMATS = [
+  "csv-log",
+  "tensorboard",
+  "mlflow",
+  "evals-result"
+];
+function pointerOf(where, at) {
+  if (where.kind === "json") return `${where.path}/${at}`;
+  return `${where.kind} ${at}`;
+}
+
+// src/artifact/curve-logs/curve.ts
+function collapse(series, mode, warnings) {
+  if (series.problems.length > 0) throw new InputError(series.problems);
+  const means = /* @__PURE__ */ new Map();
+  let previous;
+  for (const p of series.points) {
+    if (mode === "reject" && previous !== void 0 && !(p.x > previous)) {
+      throw new InputError([
+        {
+          file: series.file,
+          pointer: pointerOf(series.where, p.at),
+          expected: `"${series.x}" must strictly increase (previous ${previous})`,
+          got: String(p.x)
+        }
+      ]);
+    }
+    previous = p.x;
+    const entry = means.get(p.x);
+    if (entry === void 0) means.set(p.x, { mean: p.value, n: 1 });
+    else {
+      entry.n++;
+      entry.mean += p.value / entry.n - entry.mean / entry.n;
+    }
+  }
+  let merged = 0;
+  const out = /* @__PURE__ */ new Map();
+  for (const [x, { mean: mean2, n }] of means) {
+    if (n > 1) merged++;
+    out.set(x, mean2);
+  }
+  if (merged > 0) warnings.push({ code: "duplicates-averaged", series: series.name, xs: merged });
+  return out;
+}
+function buildCurve(read, catalogue, options = {}) {
+  const picked = pickSeries(read.series, options, catalogue);
+  const warnings = [...read.warnings, ...picked.warnings];
+  const mode = options.duplicates ?? "average";
+  const { validation, train } = picked;
+  const units = unitsFor(picked.base, validation.name, options.metric);
+  if (units.warning !== void 0) warnings.push(units.warning);
+  const conversion = units.conversion;
+  const toMetric = (v) => {
+    if (conversion === void 0) return v;
+    const converted = convert(conversion, v);
+    if (!Number.isFinite(converted))
+      throw new InputError([
+        {
+          file: validation.file,
+          pointer: "",
+          expected: `must have values that stay finite in the metric's units (${conversion})`,
+          got: String(v)
+        }
+      ]);
+    return converted;
+  };
+  const validationByX = collapse(validation, mode, warnings);
+  const trainByX = train === void 0 ? void 0 : collapse(train, mode, warnings);
+  if (validationByX.size === 0) {
+    throw new InputError([
+      {
+        file: validation.file,
+        pointer: "",
+        expected: `must have at least one value of "${validation.name}"`,
+        hint: "Check that the run got as far as a validation pass, or name another series."
+      }
+    ]);
+  }
+  const xs = [...validationByX.keys()].sort((a, b) => a - b);
+  let missing = 0;
+  const points = xs.map((x) => {
+    const point = { x, validation: toMetric(validationByX.get(x)) };
+    const t = trainByX?.get(x);
+    if (t !== void 0) point.train = toMetric(t);
+    else if (trainByX !== void 0) missing++;
+    return point;
+  });
+  if (train !== void 0 && trainByX !== void 0) {
+    if (missing > 0) warnings.push({ code: "train-missing", series: train.name, points: missing });
+    let dropped = 0;
+    for (const x of trainByX.keys()) if (!validationByX.has(x)) dropped++;
+    if (dropped > 0)
+      warnings.push({ code: "train-only-dropped", series: train.name, points: dropped });
+  }
+  const files = [.../* @__PURE__ */ new Set([validation.file, ...train === void 0 ? [] : [train.file]])];
+  return {
+    points,
+    validation: validation.name,
+    ...train === void 0 ? {} : { train: train.name },
+    by: picked.by,
+    x: validation.x,
+    files,
+    alternatives: picked.alternatives,
+    warnings
+  };
+}
+
+// src/io/curve-logs.ts
+import { readdir as readdir2, stat as stat2 } from "node:fs/promises";
+import { basename as basename2, dirname as dirname4, join as join3, relative as relative3, sep as sep2 } from "node:path";
+var nodeCurveLogFs = {
+  // Opened as untrusted input (real path in its folder, regular file, fixed size); the size limit
+  // per format is checked by `readLogFile` first, so this one only bounds the read.
+  readFile: async (path, display) => (await readChecked({
+    path,
+    file: display ?? path,
+    what: "a training log",
+    limit: "artifactBytes",
+    limits: {
+      ...DEFAULT_FILE_LIMITS,
+      artifactBytes: Math.max(MAX_EVENT_FILE_BYTES, MAX_TEXT_BYTES)
+    }
+  })).bytes,
+  readdir: async (path) => (await readdir2(path, { withFileTypes: true })).map((d) => ({
+    name: d.name,
+    kind: d.isFile() ? "file" : d.isDirectory() ? "dir" : "other"
+  })),
+  stat: async (path) => {
+    try {
+      const s = await stat2(path);
+      return { kind: s.isFile() ? "file" : s.isDirectory() ? "dir" : "other", size: s.size };
+    } catch {
+      return { kind: "missing", size: 0 };
+    }
+  }
+};
+var MAX_DEPTH = 8;
+var MAX_ENTRIES = 5e4;
+function problem(display, expected, hint) {
+  const issue = { file: display, pointer: "", expected };
+  if (hint !== void 0) issue.hint = hint;
+  return new InputError([issue]);
+}
+function joinDisplay(display, rel) {
+  const d = display.replace(/[\\/]+$/, "");
+  return d === "" || d === "." ? rel : `${d}/${rel}`;
+}
+async function search(fs, root, match, want) {
+  const found = [];
+  let queue = [{ path: root.path, rel: "" }];
+  let seen = 0;
+  for (let depth = 0; depth <= MAX_DEPTH && queue.length > 0; depth++) {
+    const next = [];
+    for (const dir of queue) {
+      const entries = await fs.readdir(dir.path);
+      seen += entries.length;
+      if (seen > MAX_ENTRIES)
+        throw problem(
+          root.display,
+          `holds more than ${MAX_ENTRIES} entries to search`,
+          "Name a folder closer to the log."
+        );
+      for (const e of entries.sort((a, b) => a.name < b.name ? -1 : a.name > b.name ? 1 : 0)) {
+        const rel = dir.rel === "" ? e.name : `${dir.rel}/${e.name}`;
+        const path = join3(dir.path, e.name);
+        if (e.kind === want && match(e.name))
+          found.push({ path, display: joinDisplay(root.display, rel), rel });
+        if (e.kind === "dir" && e.name !== ".trash" && e.name !== "node_modules")
+          next.push({ path, rel });
+      }
+    }
+    queue = next;
+  }
+  return found;
+}
+async function readLogFile(fs, file, maxBytes) {
+  const { kind, size } = await fs.stat(file.path);
+  if (kind !== "file") throw problem(file.display, "must be a readable file");
+  if (size > maxBytes)
+    throw problem(
+      file.display,
+      `must be at most ${maxBytes / 1024 / 1024} MiB (it has ${size} bytes)`,
+      "Import a shorter log, or thin it out first."
+    );
+  return fs.readFile(file.path, file.display);
+}
+async function kindOf2(fs, p) {
+  const { kind } = await fs.stat(p.path);
+  if (kind === "missing" || kind === "other")
+    throw problem(p.display, kind === "missing" ? "does not exist" : "must be a file or a folder");
+  return kind;
+}
+async function oneFile(fs, root, match, what) {
+  if (await kindOf2(fs, root) === "file") return root;
+  const found = await search(fs, root, match, "file");
+  const [first] = found;
+  if (first === void 0)
+    throw problem(root.display, `must hold ${what}`, "Name the log file itself.");
+  if (found.length > 1)
+    throw problem(
+      root.display,
+      `must hold one ${what}, but holds ${found.length}: ${found.slice(0, 5).map((f) => f.display).join(", ")}${found.length > 5 ? ", \u2026" : ""}`,
+      "Name the one to import."
+    );
+  return first;
+}
+function pool(results) {
+  const byName = /* @__PURE__ */ new Map();
+  const warnings = results.flatMap((r) => r.warnings);
+  for (const r of results) {
+    for (const s of r.series) {
+      const seen = byName.get(s.name);
+      if (seen === void 0)
+        byName.set(s.name, { ...s, points: [...s.points], problems: [...s.problems] });
+      else {
+        for (const p of s.points) seen.points.push(p);
+        seen.problems.push(...s.problems.slice(0, Math.max(0, 10 - seen.problems.length)));
+      }
+    }
+  }
+  return { series: [...byName.values()], warnings };
+}
+function commonDir(paths) {
+  const split = paths.map((p) => dirname4(p).split(sep2));
+  const first = split[0] ?? [];
+  let n = first.length;
+  for (const parts of split) {
+    let i = 0;
+    while (i < n && parts[i] === first[i]) i++;
+    n = i;
+  }
+  return first.slice(0, n).join(sep2);
+}
+async function readTensorBoardLogs(fs, paths, budget) {
+  const files = [];
+  for (const p of paths) {
+    if (await kindOf2(fs, p) === "file") files.push(p);
+    else {
+      const found = await search(fs, p, (n) => n.startsWith("events.out.tfevents."), "file");
+      if (found.length === 0)
+        throw problem(
+          p.display,
+          "must hold a TensorBoard event file (events.out.tfevents.*)",
+          "Name the log folder of one run."
+        );
+      files.push(...found);
+    }
+  }
+  const common = commonDir(files.map((f) => f.path));
+  const results = [];
+  for (const f of files) {
+    const label = relative3(common, dirname4(f.path)).split(sep2).join("/");
+    const read = readTensorBoard(await readLogFile(fs, f, MAX_EVENT_FILE_BYTES), f.display, {
+      budget
+    });
+    if (label !== "") for (const s of read.series) s.name = `${label}/${s.name}`;
+    results.push(read);
+  }
+  return pool(results);
+}
+async function readMlflowLogs(fs, paths, budget) {
+  const results = [];
+  let catalogueFile = "";
+  for (const p of paths) {
+    if (await kindOf2(fs, p) === "file") {
+      const segments = p.display.split(/[\\/]/);
+      const at = segments.lastIndexOf("metrics");
+      const key = at >= 0 && at < segments.length - 1 ? segments.slice(at + 1).join("/") : basename2(p.path);
+      results.push(
+        readMlflowMetric(await readLogFile(fs, p, MAX_TEXT_BYTES), p.display, key, { budget })
+      );
+      catalogueFile ||= p.display;
+      continue;
+    }
+    const metricsDirs = basename2(p.path) === "metrics" ? [p] : await search(fs, p, (n) => n === "metrics", "dir");
+    const [metrics] = metricsDirs;
+    if (metrics === void 0)
+      throw problem(
+        p.display,
+        "must hold an MLflow run (a metrics/ folder)",
+        "Name mlruns/<experiment>/<run>."
+      );
+    if (metricsDirs.length > 1)
+      throw problem(
+        p.display,
+        `must hold one MLflow run, but holds ${metricsDirs.length}: ${metricsDirs.slice(0, 5).map((m) => m.display.replace(/\/metrics$/, "")).join(", ")}${metricsDirs.length > 5 ? ", \u2026" : ""}`,
+        "Name the run folder, mlruns/<experiment>/<run>."
+      );
+    catalogueFile ||= metrics.display;
+    for (const f of await search(fs, metrics, () => true, "file")) {
+      const key = f.rel;
+      results.push(
+        readMlflowMetric(await readLogFile(fs, f, MAX_TEXT_BYTES), f.display, key, { budget })
+      );
+    }
+  }
+  return { read: pool(results), file: catalogueFile };
+}
+async function readCurveLogs(format, paths, fs, options = {}) {
+  const budget = new PointBudget();
+  const shown = paths.map((p) => p.display).join(", ");
+  let read;
+  let catalogue;
+  if (format === "csv-log") {
+    const results = [];
+    const files = [];
+    for (const p of paths) {
+      const file = await oneFile(fs, p, (n) => /\.csv$/i.test(n), "CSV log (*.csv)");
+      files.push(file.display);
+      const bytes = await readLogFile(fs, file, MAX_TEXT_BYTES);
+      results.push(
+        readCsvLog(bytes, file.display, {
+          budget,
+          ...options.x === void 0 ? {} : { x: options.x }
+        })
+      );
+    }
+    read = pool(results);
+    catalogue = { file: files.join(", "), pointer: "line 1", noun: "column" };
+  } else if (format === "tensorboard") {
+    read = await readTensorBoardLogs(fs, paths, budget);
+    catalogue = { file: shown, pointer: "", noun: "tag" };
+  } else if (format === "mlflow") {
+    const found = await readMlflowLogs(fs, paths, budget);
+    read = found.read;
+    catalogue = { file: found.file, pointer: "", noun: "metric" };
+  } else {
+    const results = [];
+    for (const p of paths) {
+      const file = await oneFile(
+        fs,
+        p,
+        (n) => /\.json$/i.test(n),
+        "evals_result JSON file (*.json)"
+      );
+      results.push(
+        readEvalsResult(await readLogFile(fs, file, MAX_TEXT_BYTES), file.display, { budget })
+      );
+    }
+    read = pool(results);
+    catalogue = { file: shown, pointer: "", noun: "eval-set metric" };
+  }
+  if (read.series.length > MAX_SERIES)
+    throw problem(shown, `must hold at most ${MAX_SERIES} series`, "Name fewer or smaller logs.");
+  if (options.x === "epoch" && (format === "tensorboard" || format === "mlflow"))
+    read = stepsToEpochs(read, catalogue.file);
+  return { read, catalogue };
+}
+
+// src/report/curve-log-notes.ts
+var CONVERSION_WORDS = {
+  "one-minus": "1 \u2212 value",
+  sqrt: "the square root",
+  square: "the square"
+};
+function curveLogWarningText(w) {
+  switch (w.code) {
+    case "loss-not-metric":
+      return w.metric === void 0 ? `"${w.series}" is a loss, not necessarily the run's metric; the artifact's curves must be in the metric's units. Pass --metric NAME, or name metric series with --train and --validation.` : `"${w.series}" is a loss, not the metric "${w.metric}"; the artifact's curves must be in the metric's units. Name the metric's series with --train and --validation if the log has them.`;
+    case "units-unchecked":
+      return w.metric === void 0 ? `Check that "${w.series}" is in the units of the run's metric (pass --metric NAME to have it checked).` : `Could not tell whether "${w.series}" is in the units of "${w.metric}"; check it.`;
+    case "converted":
+      return `Converted "${w.series}" to the units of "${w.metric}" (${CONVERSION_WORDS[w.conversion]}).`;
+    case "duplicates-averaged":
+      return `"${w.series}" had several values at ${w.xs} x value(s); each was replaced by their mean.`;
+    case "no-train-series":
+      return `No training series pairs with "${w.validation}"; the curve has validation values only (name one with --train).`;
+    case "train-missing":
+      return `"${w.series}" has no value at ${w.points} point(s) of the curve; those points have no train value.`;
+    case "train-only-dropped":
+      return `${w.points} value(s) of "${w.series}" at an x with no validation value were left out.`;
+    case "truncated-record":
+      return `${w.file} ends inside a record at byte ${w.offset} (still being written?); the records before it were read.`;
+    case "non-scalar-skipped":
+      return `${w.file}: skipped ${w.count} summary value(s) that are not numeric scalars (histograms, images, text).`;
+    case "eval-sets-guessed":
+      return `Took eval set "${w.train}" as training data and "${w.validation}" as validation data (eval_set order); name them with --train and --validation if that is wrong.`;
+  }
+}
+function curveImportNotes(curve, out) {
+  const series = curve.train === void 0 ? `validation "${curve.validation}"` : `train "${curve.train}" and validation "${curve.validation}"`;
+  const how = curve.by === "flags" ? "Took" : "Picked";
+  const others = curve.alternatives.length === 0 ? "" : ` Others: ${curve.alternatives.slice(0, 6).map((a) => `"${a}"`).join(", ")}${curve.alternatives.length > 6 ? ", \u2026" : ""}.`;
+  return [
+    `${how} ${series} from ${curve.files.join(", ")} (x: ${curve.x}); wrote ${curve.points.length} point(s) to ${out}.${others}`,
+    ...curve.warnings.map(curveLogWarningText)
+  ];
+}
+
+// src/entries/cli/curves-import.ts
+var CURVES_HELP = `Usage: fitgap curves import --from FORMAT PATH... --out FILE [options]
+
+Commands:
+  import     turn a training log into a run artifact's epoch curve
+
+Run 'fitgap curves import --help' for its options.
+`;
+var CURVES_IMPORT_HELP = `Usage: fitgap curves import --from FORMAT PATH... --out FILE [options]
+
+Read a training log and write its epoch curve as {"epochs": [{x, train, validation}]},
+the shape of a run artifact's "curves". PATH is a log file or a folder to search.
+
+Formats (--from):
+  csv-log         per-epoch CSV (Keras CSVLogger; Lightning CSVLogger's metrics.csv)
+  tensorboard     TensorBoard event files (events.out.tfevents.*)
+  mlflow          an MLflow run folder (mlruns/EXPERIMENT/RUN) or its metric files
+  evals-result    XGBoost or LightGBM evals_result JSON (x: boosting round from 1)
+
+Options:
+  --from FORMAT         log format (required)
+  --out FILE            file to write the curve JSON to (required)
+  --train SERIES        training series (default: picked by name, such as loss)
+  --validation SERIES   validation series (default: picked by name, such as val_loss)
+  --metric NAME         the run's metric (accuracy, error, rmse, ...): pick its series
+                        and convert accuracy/error and MSE/RMSE into its units
+  --x epoch|step        x for csv-log (the column), tensorboard and mlflow (epoch: via
+                        the logged "epoch" series); default epoch for csv-log, else step
+  -h, --help            show this help
+
+Values of one series at the same x are averaged; points are sorted by x.
+Exit codes: 0 curve written; 2 bad input or usage.
+`;
+var FLAGS = {
+  from: { type: "string" },
+  out: { type: "string" },
+  train: { type: "string" },
+  validation: { type: "string" },
+  metric: { type: "string" },
+  x: { type: "string" },
+  help: { type: "boolean", short: "h" }
+};
+var COMMAND = "curves import";
+function text(values, flag) {
+  const value2 = values[flag];
+  if (value2 === "") throw new UsageError(`fitgap ${COMMAND}: --${flag} must not be empty.`);
+  return typeof value2 === "string" ? value2 : void 0;
+}
+async function curvesImportCommand(argv, io, fs = nodeCurveLogFs) {
+  const { values, positionals } = parseFlags(argv, FLAGS, COMMAND);
+  if (values["help"] === true) {
+    io.stdout(CURVES_IMPORT_HELP);
+    return EXIT.ok;
+  }
+  const from = text(values, "from");
+  if (from === void 0 || !CURVE_LOG_FORMATS.includes(from)) {
+    throw new UsageError(
+      `fitgap ${COMMAND}: --from must be one of ${CURVE_LOG_FORMATS.join(", ")}${from === void 0 ? "" : ` (got ${JSON.stringify(from)})`}. Run 'fitgap ${COMMAND} --help'.`
+    );
+  }
+  const format = from;
+  const out = text(values, "out");
+  if (out === void 0)
+    throw new UsageError(
+      `fitgap ${COMMAND}: --out FILE is required. Run 'fitgap ${COMMAND} --help'.`
+    );
+  if (positionals.length === 0)
+    throw new UsageError(`fitgap ${COMMAND}: name at least one log file or folder.`);
+  const x = text(values, "x");
+  if (x !== void 0 && x !== "epoch" && x !== "step")
+    throw new UsageError(
+      `fitgap ${COMMAND}: --x must be epoch or step (got ${JSON.stringify(x)}).`
+    );
+  if (x !== void 0 && format === "evals-result")
+    throw new UsageError(
+      `fitgap ${COMMAND}: --x does not apply to evals-result; x is the boosting round.`
+    );
+  const train = text(values, "train");
+  const validation = text(values, "validation");
+  const metric = text(values, "metric");
+  const paths = positionals.map((p) => ({ path: resolve6(io.cwd, p), display: p }));
+  const { read, catalogue } = await readCurveLogs(format, paths, fs, x === void 0 ? {} : { x });
+  const curve = buildCurve(read, catalogue, {
+    ...train === void 0 ? {} : { train },
+    ...validation === void 0 ? {} : { validation },
+    ...metric === void 0 ? {} : { metric }
+  });
+  const epochs = curve.points.map(
+    (p) => p.train === void 0 ? { x: p.x, validation: p.validation } : { x: p.x, train: p.train, validation: p.validation }
+  );
+  const inputs = (await Promise.all(paths.map((p) => identify(p.path)))).filter(
+    (f) => f !== null
+  );
+  await io.writeFile(resolve6(io.cwd, out), `${JSON.stringify({ epochs }, null, 2)}
+`, {
+    file: out,
+    inputs
+  });
+  for (const line of curveImportNotes(curve, out)) io.stderr(`fitgap: ${line}
+`);
+  return EXIT.ok;
+}
+async function curvesCommand(argv, io, fs = nodeCurveLogFs) {
+  const [sub, ...rest] = argv;
+  if (sub === "import") return curvesImportCommand(rest, io, fs);
+  if (sub === void 0 || sub === "--help" || sub === "-h" || sub === "help") {
+    io.stdout(CURVES_HELP);
+    return sub === void 0 ? EXIT.badInput : EXIT.ok;
+  }
+  throw new UsageError(
+    `fitgap curves: unknown command ${JSON.stringify(sub)}. Run 'fitgap curves --help'.`
+  );
 }
 
 // src/entries/cli/main.ts
@@ -24581,6 +27286,8 @@ async function runCli(argv, io) {
         return await validateCommand(rest, io);
       case "demo":
         return await demoCommand(rest, io);
+      case "curves":
+        return await curvesCommand(rest, io);
       case "--version":
       case "-v":
         io.stdout(`${io.version}
@@ -24607,47 +27314,6 @@ async function runCli(argv, io) {
   }
 }
 
-// src/io/write-output.ts
-import { realpath as realpath2, stat, writeFile } from "node:fs/promises";
-import { basename, dirname as dirname3, join as join2, resolve as resolve5 } from "node:path";
-function refuse2(file, expected, got, hint) {
-  throw new InputError([{ file, pointer: "", expected, got, hint }]);
-}
-async function realTarget(path) {
-  const real = await realpath2(path).catch(() => null);
-  if (real !== null) return real;
-  const folder = await realpath2(dirname3(path)).catch(() => null);
-  return folder === null ? null : join2(folder, basename(path));
-}
-async function writeOutput(path, text, file, inputs) {
-  const target = resolve5(path);
-  const real = await realTarget(target);
-  const info = await stat(target).catch(() => null);
-  const id = info === null ? null : `${info.dev}:${info.ino}`;
-  if (inputs.some((input) => input.realPath === real || id !== null && input.id === id)) {
-    refuse2(
-      file,
-      "must not name one of the review's input files (--out)",
-      "an input file",
-      "Write the review to a new file."
-    );
-  }
-  if (info?.isDirectory() === true)
-    refuse2(file, "could not be written (--out)", "a folder", "Name a file, not a folder.");
-  try {
-    await writeFile(target, text, "utf8");
-  } catch (error) {
-    const code = error.code;
-    const got = code === "ENOENT" ? "no such folder" : code === "ENOSPC" ? "no space left on the device" : code === "EROFS" ? "a read-only file system" : describeCode(code);
-    refuse2(
-      file,
-      "could not be written (--out)",
-      got,
-      "Check that the folder exists and can be written to."
-    );
-  }
-}
-
 // package.json
 var package_default = {
   name: "fitgap",
@@ -24668,12 +27334,14 @@ var package_default = {
   scripts: {
     build: "node scripts/build.mjs",
     typecheck: "tsc --noEmit",
-    lint: "eslint . && prettier --check . && npm run -s lint:layers",
+    lint: "eslint . && prettier --check . && npm run -s lint:layers && node scripts/review-types.mjs --check",
     format: "prettier --write .",
-    test: "vitest run",
+    test: "vitest run && npm run -s test:python",
+    "test:python": "${PYTHON:-python3} -m unittest discover -s python/tests -v",
     demo: "npm run -s build && node dist/cli.js demo",
     bench: "node scripts/bench.mjs",
-    "lint:layers": "depcruise src --config .dependency-cruiser.cjs"
+    "lint:layers": "depcruise src --config .dependency-cruiser.cjs",
+    "schema:types": "node scripts/review-types.mjs"
   },
   dependencies: {
     "@actions/core": "3.0.1",
@@ -24686,7 +27354,6 @@ var package_default = {
     fflate: "0.8.3",
     jstat: "1.9.6",
     "markdown-table": "3.1.0",
-    "ml-levenberg-marquardt": "5.1.0",
     yaml: "2.9.1"
   },
   devDependencies: {
@@ -24700,6 +27367,7 @@ var package_default = {
     eslint: "9.39.5",
     "fast-check": "4.11.0",
     jsdom: "29.1.1",
+    "json-schema-to-typescript": "^16.0.0",
     mermaid: "11.17.2",
     micromark: "4.0.3",
     "micromark-extension-gfm": "3.0.0",
@@ -24721,15 +27389,15 @@ var quietOnClose = (error) => {
 };
 process.stdout.on("error", quietOnClose);
 process.stderr.on("error", quietOnClose);
-var write = (stream) => (text) => {
-  if (!closed) stream.write(text);
+var write = (stream) => (text2) => {
+  if (!closed) stream.write(text2);
 };
 runCli(process.argv.slice(2), {
   stdout: write(process.stdout),
   stderr: write(process.stderr),
   color: process.stdout.isTTY === true && process.env["NO_COLOR"] === void 0,
   cwd: process.cwd(),
-  writeFile: (path, text, { file, inputs }) => writeOutput(path, text, file, inputs),
+  writeFile: (path, text2, { file, inputs }) => writeOutput(path, text2, file, inputs),
   demoDir: fileURLToPath(new URL("../demo/", import.meta.url)),
   version
 }).then(

@@ -854,7 +854,7 @@ var require_tree = __commonJS({
        * @param {any} value
        * @param {number} index
        */
-      constructor(key, value, index) {
+      constructor(key, value2, index) {
         if (index === void 0 || index >= key.length) {
           throw new TypeError("Unreachable");
         }
@@ -863,16 +863,16 @@ var require_tree = __commonJS({
           throw new TypeError("key must be ascii string");
         }
         if (key.length !== ++index) {
-          this.middle = new _TstNode(key, value, index);
+          this.middle = new _TstNode(key, value2, index);
         } else {
-          this.value = value;
+          this.value = value2;
         }
       }
       /**
        * @param {string} key
        * @param {any} value
        */
-      add(key, value) {
+      add(key, value2) {
         const length = key.length;
         if (length === 0) {
           throw new TypeError("Unreachable");
@@ -886,25 +886,25 @@ var require_tree = __commonJS({
           }
           if (node.code === code) {
             if (length === ++index) {
-              node.value = value;
+              node.value = value2;
               break;
             } else if (node.middle !== null) {
               node = node.middle;
             } else {
-              node.middle = new _TstNode(key, value, index);
+              node.middle = new _TstNode(key, value2, index);
               break;
             }
           } else if (node.code < code) {
             if (node.left !== null) {
               node = node.left;
             } else {
-              node.left = new _TstNode(key, value, index);
+              node.left = new _TstNode(key, value2, index);
               break;
             }
           } else if (node.right !== null) {
             node = node.right;
           } else {
-            node.right = new _TstNode(key, value, index);
+            node.right = new _TstNode(key, value2, index);
             break;
           }
         }
@@ -943,11 +943,11 @@ var require_tree = __commonJS({
        * @param {string} key
        * @param {any} value
        * */
-      insert(key, value) {
+      insert(key, value2) {
         if (this.node === null) {
-          this.node = new TstNode(key, value, 0);
+          this.node = new TstNode(key, value2, 0);
         } else {
-          this.node.add(key, value);
+          this.node.add(key, value2);
         }
       }
       /**
@@ -1048,11 +1048,11 @@ var require_util = __commonJS({
       return url;
     }
     function isValidPort(port) {
-      const value = parseInt(port, 10);
-      return value === Number(port) && value >= 0 && value <= 65535;
+      const value2 = parseInt(port, 10);
+      return value2 === Number(port) && value2 >= 0 && value2 <= 65535;
     }
-    function isHttpOrHttpsPrefixed(value) {
-      return value != null && value[0] === "h" && value[1] === "t" && value[2] === "t" && value[3] === "p" && (value[4] === ":" || value[4] === "s" && value[5] === ":");
+    function isHttpOrHttpsPrefixed(value2) {
+      return value2 != null && value2[0] === "h" && value2[1] === "t" && value2[2] === "t" && value2[3] === "p" && (value2[4] === ":" || value2[4] === "s" && value2[5] === ":");
     }
     function parseURL(url) {
       if (typeof url === "string") {
@@ -1176,11 +1176,11 @@ var require_util = __commonJS({
       const m = val.toString().match(KEEPALIVE_TIMEOUT_EXPR);
       return m ? parseInt(m[1], 10) * 1e3 : null;
     }
-    function headerNameToString(value) {
-      return typeof value === "string" ? headerNameLowerCasedRecord[value] ?? value.toLowerCase() : tree.lookup(value) ?? value.toString("latin1").toLowerCase();
+    function headerNameToString(value2) {
+      return typeof value2 === "string" ? headerNameLowerCasedRecord[value2] ?? value2.toLowerCase() : tree.lookup(value2) ?? value2.toString("latin1").toLowerCase();
     }
-    function bufferToLowerCasedHeaderName(value) {
-      return tree.lookup(value) ?? value.toString("latin1").toLowerCase();
+    function bufferToLowerCasedHeaderName(value2) {
+      return tree.lookup(value2) ?? value2.toString("latin1").toLowerCase();
     }
     function parseHeaders(headers, obj) {
       if (obj === void 0) obj = {};
@@ -1295,14 +1295,14 @@ var require_util = __commonJS({
             iterator2 = iterable[Symbol.asyncIterator]();
           },
           async pull(controller) {
-            const { done, value } = await iterator2.next();
+            const { done, value: value2 } = await iterator2.next();
             if (done) {
               queueMicrotask(() => {
                 controller.close();
                 controller.byobRequest?.respond(0);
               });
             } else {
-              const buf = Buffer.isBuffer(value) ? value : Buffer.from(value);
+              const buf = Buffer.isBuffer(value2) ? value2 : Buffer.from(value2);
               if (buf.byteLength) {
                 controller.enqueue(new Uint8Array(buf));
               }
@@ -1967,8 +1967,8 @@ var require_request = __commonJS({
           this.endHandler = null;
         }
       }
-      addHeader(key, value) {
-        processHeader(this, key, value);
+      addHeader(key, value2) {
+        processHeader(this, key, value2);
         return this;
       }
     };
@@ -2040,11 +2040,11 @@ var require_request = __commonJS({
       } else if (headerName === "transfer-encoding" || headerName === "keep-alive" || headerName === "upgrade") {
         throw new InvalidArgumentError(`invalid ${headerName} header`);
       } else if (headerName === "connection") {
-        const value = typeof val === "string" ? val.toLowerCase() : null;
-        if (value !== "close" && value !== "keep-alive") {
+        const value2 = typeof val === "string" ? val.toLowerCase() : null;
+        if (value2 !== "close" && value2 !== "keep-alive") {
           throw new InvalidArgumentError("invalid connection header");
         }
-        if (value === "close") {
+        if (value2 === "close") {
           request2.reset = true;
         }
       } else if (headerName === "expect") {
@@ -2709,9 +2709,9 @@ var require_utils = __commonJS({
     function enumToMap(obj) {
       const res = {};
       Object.keys(obj).forEach((key) => {
-        const value = obj[key];
-        if (typeof value === "number") {
-          res[key] = value;
+        const value2 = obj[key];
+        if (typeof value2 === "number") {
+          res[key] = value2;
         }
       });
       return res;
@@ -3524,11 +3524,11 @@ var require_data_url = __commonJS({
     }
     function collectAnHTTPQuotedString(input, position, extractValue) {
       const positionStart = position.position;
-      let value = "";
+      let value2 = "";
       assert(input[position.position] === '"');
       position.position++;
       while (true) {
-        value += collectASequenceOfCodePoints(
+        value2 += collectASequenceOfCodePoints(
           (char) => char !== '"' && char !== "\\",
           input,
           position
@@ -3540,10 +3540,10 @@ var require_data_url = __commonJS({
         position.position++;
         if (quoteOrBackslash === "\\") {
           if (position.position >= input.length) {
-            value += "\\";
+            value2 += "\\";
             break;
           }
-          value += input[position.position];
+          value2 += input[position.position];
           position.position++;
         } else {
           assert(quoteOrBackslash === '"');
@@ -3551,7 +3551,7 @@ var require_data_url = __commonJS({
         }
       }
       if (extractValue) {
-        return value;
+        return value2;
       }
       return input.slice(positionStart, position.position);
     }
@@ -3559,16 +3559,16 @@ var require_data_url = __commonJS({
       assert(mimeType !== "failure");
       const { parameters, essence } = mimeType;
       let serialization = essence;
-      for (let [name, value] of parameters.entries()) {
+      for (let [name, value2] of parameters.entries()) {
         serialization += ";";
         serialization += name;
         serialization += "=";
-        if (!HTTP_TOKEN_CODEPOINTS.test(value)) {
-          value = value.replace(/(\\|")/g, "\\$1");
-          value = '"' + value;
-          value += '"';
+        if (!HTTP_TOKEN_CODEPOINTS.test(value2)) {
+          value2 = value2.replace(/(\\|")/g, "\\$1");
+          value2 = '"' + value2;
+          value2 += '"';
         }
-        serialization += value;
+        serialization += value2;
       }
       return serialization;
     }
@@ -3841,11 +3841,11 @@ var require_webidl = __commonJS({
           });
         }
         while (true) {
-          const { done, value } = method.next();
+          const { done, value: value2 } = method.next();
           if (done) {
             break;
           }
-          seq.push(converter(value, prefix, `${argument}[${index++}]`));
+          seq.push(converter(value2, prefix, `${argument}[${index++}]`));
         }
         return seq;
       };
@@ -3913,20 +3913,20 @@ var require_webidl = __commonJS({
               });
             }
           }
-          let value = dictionary[key];
+          let value2 = dictionary[key];
           const hasDefault = Object.hasOwn(options, "defaultValue");
-          if (hasDefault && value !== null) {
-            value ??= defaultValue();
+          if (hasDefault && value2 !== null) {
+            value2 ??= defaultValue();
           }
-          if (required2 || hasDefault || value !== void 0) {
-            value = converter(value, prefix, `${argument}.${key}`);
-            if (options.allowedValues && !options.allowedValues.includes(value)) {
+          if (required2 || hasDefault || value2 !== void 0) {
+            value2 = converter(value2, prefix, `${argument}.${key}`);
+            if (options.allowedValues && !options.allowedValues.includes(value2)) {
               throw webidl.errors.exception({
                 header: prefix,
-                message: `${value} is not an accepted type. Expected one of ${options.allowedValues.join(", ")}.`
+                message: `${value2} is not an accepted type. Expected one of ${options.allowedValues.join(", ")}.`
               });
             }
-            dict[key] = value;
+            dict[key] = value2;
           }
         }
         return dict;
@@ -4137,8 +4137,8 @@ var require_util2 = __commonJS({
       }
       return true;
     }
-    function normalizeBinaryStringToUtf8(value) {
-      return Buffer.from(value, "binary").toString("utf8");
+    function normalizeBinaryStringToUtf8(value2) {
+      return Buffer.from(value2, "binary").toString("utf8");
     }
     function requestCurrentURL(request2) {
       return request2.urlList[request2.urlList.length - 1];
@@ -4499,8 +4499,8 @@ var require_util2 = __commonJS({
     function normalizeMethod(method) {
       return normalizedMethodRecordsBase[method.toLowerCase()] ?? method;
     }
-    function serializeJavascriptValueToJSONString(value) {
-      const result = JSON.stringify(value);
+    function serializeJavascriptValueToJSONString(value2) {
+      const result = JSON.stringify(value2);
       if (result === void 0) {
         throw new TypeError("Value is not JSON serializable");
       }
@@ -4541,7 +4541,7 @@ var require_util2 = __commonJS({
               done: true
             };
           }
-          const { [keyIndex]: key, [valueIndex]: value } = values[index];
+          const { [keyIndex]: key, [valueIndex]: value2 } = values[index];
           this.#index = index + 1;
           let result;
           switch (this.#kind) {
@@ -4549,10 +4549,10 @@ var require_util2 = __commonJS({
               result = key;
               break;
             case "value":
-              result = value;
+              result = value2;
               break;
             case "key+value":
-              result = [key, value];
+              result = [key, value2];
               break;
           }
           return {
@@ -4618,8 +4618,8 @@ var require_util2 = __commonJS({
                 `Failed to execute 'forEach' on '${name}': parameter 1 is not of type 'Function'.`
               );
             }
-            for (const { 0: key, 1: value } of makeIterator(this, "key+value")) {
-              callbackfn.call(thisArg, value, key, this);
+            for (const { 0: key, 1: value2 } of makeIterator(this, "key+value")) {
+              callbackfn.call(thisArg, value2, key, this);
             }
           }
         }
@@ -4696,8 +4696,8 @@ var require_util2 = __commonJS({
       const protocol = url.protocol;
       return protocol === "http:" || protocol === "https:";
     }
-    function simpleRangeHeaderValue(value, allowWhitespace) {
-      const data = value;
+    function simpleRangeHeaderValue(value2, allowWhitespace) {
+      const data = value2;
       if (!data.startsWith("bytes")) {
         return "failure";
       }
@@ -4815,8 +4815,8 @@ var require_util2 = __commonJS({
       if (values === null) {
         return "failure";
       }
-      for (const value of values) {
-        const temporaryMimeType = parseMIMEType(value);
+      for (const value2 of values) {
+        const temporaryMimeType = parseMIMEType(value2);
         if (temporaryMimeType === "failure" || temporaryMimeType.essence === "*/*") {
           continue;
         }
@@ -4836,8 +4836,8 @@ var require_util2 = __commonJS({
       }
       return mimeType;
     }
-    function gettingDecodingSplitting(value) {
-      const input = value;
+    function gettingDecodingSplitting(value2) {
+      const input = value2;
       const position = { position: 0 };
       const values = [];
       let temporaryValue = "";
@@ -4868,11 +4868,11 @@ var require_util2 = __commonJS({
       return values;
     }
     function getDecodeSplit(name, list) {
-      const value = list.get(name, true);
-      if (value === null) {
+      const value2 = list.get(name, true);
+      if (value2 === null) {
         return null;
       }
-      return gettingDecodingSplitting(value);
+      return gettingDecodingSplitting(value2);
     }
     var textDecoder = new TextDecoder();
     function utf8DecodeBytes(buffer) {
@@ -5055,19 +5055,19 @@ var require_formdata = __commonJS({
         }
         this[kState] = [];
       }
-      append(name, value, filename = void 0) {
+      append(name, value2, filename = void 0) {
         webidl.brandCheck(this, _FormData);
         const prefix = "FormData.append";
         webidl.argumentLengthCheck(arguments, 2, prefix);
-        if (arguments.length === 3 && !isBlobLike(value)) {
+        if (arguments.length === 3 && !isBlobLike(value2)) {
           throw new TypeError(
             "Failed to execute 'append' on 'FormData': parameter 2 is not of type 'Blob'"
           );
         }
         name = webidl.converters.USVString(name, prefix, "name");
-        value = isBlobLike(value) ? webidl.converters.Blob(value, prefix, "value", { strict: false }) : webidl.converters.USVString(value, prefix, "value");
+        value2 = isBlobLike(value2) ? webidl.converters.Blob(value2, prefix, "value", { strict: false }) : webidl.converters.USVString(value2, prefix, "value");
         filename = arguments.length === 3 ? webidl.converters.USVString(filename, prefix, "filename") : void 0;
-        const entry = makeEntry(name, value, filename);
+        const entry = makeEntry(name, value2, filename);
         this[kState].push(entry);
       }
       delete(name) {
@@ -5102,19 +5102,19 @@ var require_formdata = __commonJS({
         name = webidl.converters.USVString(name, prefix, "name");
         return this[kState].findIndex((entry) => entry.name === name) !== -1;
       }
-      set(name, value, filename = void 0) {
+      set(name, value2, filename = void 0) {
         webidl.brandCheck(this, _FormData);
         const prefix = "FormData.set";
         webidl.argumentLengthCheck(arguments, 2, prefix);
-        if (arguments.length === 3 && !isBlobLike(value)) {
+        if (arguments.length === 3 && !isBlobLike(value2)) {
           throw new TypeError(
             "Failed to execute 'set' on 'FormData': parameter 2 is not of type 'Blob'"
           );
         }
         name = webidl.converters.USVString(name, prefix, "name");
-        value = isBlobLike(value) ? webidl.converters.Blob(value, prefix, "name", { strict: false }) : webidl.converters.USVString(value, prefix, "name");
+        value2 = isBlobLike(value2) ? webidl.converters.Blob(value2, prefix, "name", { strict: false }) : webidl.converters.USVString(value2, prefix, "name");
         filename = arguments.length === 3 ? webidl.converters.USVString(filename, prefix, "name") : void 0;
-        const entry = makeEntry(name, value, filename);
+        const entry = makeEntry(name, value2, filename);
         const idx = this[kState].findIndex((entry2) => entry2.name === name);
         if (idx !== -1) {
           this[kState] = [
@@ -5158,21 +5158,21 @@ var require_formdata = __commonJS({
         configurable: true
       }
     });
-    function makeEntry(name, value, filename) {
-      if (typeof value === "string") {
+    function makeEntry(name, value2, filename) {
+      if (typeof value2 === "string") {
       } else {
-        if (!isFileLike(value)) {
-          value = value instanceof Blob ? new File([value], "blob", { type: value.type }) : new FileLike(value, "blob", { type: value.type });
+        if (!isFileLike(value2)) {
+          value2 = value2 instanceof Blob ? new File([value2], "blob", { type: value2.type }) : new FileLike(value2, "blob", { type: value2.type });
         }
         if (filename !== void 0) {
           const options = {
-            type: value.type,
-            lastModified: value.lastModified
+            type: value2.type,
+            lastModified: value2.lastModified
           };
-          value = value instanceof NativeFile ? new File([value], filename, options) : new FileLike(value, filename, options);
+          value2 = value2 instanceof NativeFile ? new File([value2], filename, options) : new FileLike(value2, filename, options);
         }
       }
-      return { name, value };
+      return { name, value: value2 };
     }
     module.exports = { FormData, makeEntry };
   }
@@ -5270,19 +5270,19 @@ var require_formdata_parser = __commonJS({
         } else {
           position.position += 2;
         }
-        let value;
+        let value2;
         if (filename !== null) {
           contentType ??= "text/plain";
           if (!isAsciiString(contentType)) {
             contentType = "";
           }
-          value = new File([body], filename, { type: contentType });
+          value2 = new File([body], filename, { type: contentType });
         } else {
-          value = utf8DecodeBytes(Buffer.from(body));
+          value2 = utf8DecodeBytes(Buffer.from(body));
         }
         assert(isUSVString(name));
-        assert(typeof value === "string" && isUSVString(value) || isFileLike(value));
-        entryList.push(makeEntry(name, value, filename));
+        assert(typeof value2 === "string" && isUSVString(value2) || isFileLike(value2));
+        entryList.push(makeEntry(name, value2, filename));
       }
     }
     function parseMultipartFormDataHeaders(input, position) {
@@ -5513,27 +5513,27 @@ var require_body = __commonJS({
         const prefix = `--${boundary}\r
 Content-Disposition: form-data`;
         const escape2 = (str) => str.replace(/\n/g, "%0A").replace(/\r/g, "%0D").replace(/"/g, "%22");
-        const normalizeLinefeeds = (value) => value.replace(/\r?\n|\r/g, "\r\n");
+        const normalizeLinefeeds = (value2) => value2.replace(/\r?\n|\r/g, "\r\n");
         const blobParts = [];
         const rn = new Uint8Array([13, 10]);
         length = 0;
         let hasUnknownSizeValue = false;
-        for (const [name, value] of object) {
-          if (typeof value === "string") {
+        for (const [name, value2] of object) {
+          if (typeof value2 === "string") {
             const chunk2 = textEncoder.encode(prefix + `; name="${escape2(normalizeLinefeeds(name))}"\r
 \r
-${normalizeLinefeeds(value)}\r
+${normalizeLinefeeds(value2)}\r
 `);
             blobParts.push(chunk2);
             length += chunk2.byteLength;
           } else {
-            const chunk2 = textEncoder.encode(`${prefix}; name="${escape2(normalizeLinefeeds(name))}"` + (value.name ? `; filename="${escape2(value.name)}"` : "") + `\r
-Content-Type: ${value.type || "application/octet-stream"}\r
+            const chunk2 = textEncoder.encode(`${prefix}; name="${escape2(normalizeLinefeeds(name))}"` + (value2.name ? `; filename="${escape2(value2.name)}"` : "") + `\r
+Content-Type: ${value2.type || "application/octet-stream"}\r
 \r
 `);
-            blobParts.push(chunk2, value, rn);
-            if (typeof value.size === "number") {
-              length += chunk2.byteLength + value.size + rn.byteLength;
+            blobParts.push(chunk2, value2, rn);
+            if (typeof value2.size === "number") {
+              length += chunk2.byteLength + value2.size + rn.byteLength;
             } else {
               hasUnknownSizeValue = true;
             }
@@ -5584,7 +5584,7 @@ Content-Type: ${value.type || "application/octet-stream"}\r
             iterator2 = action(object)[Symbol.asyncIterator]();
           },
           async pull(controller) {
-            const { value, done } = await iterator2.next();
+            const { value: value2, done } = await iterator2.next();
             if (done) {
               queueMicrotask(() => {
                 controller.close();
@@ -5592,7 +5592,7 @@ Content-Type: ${value.type || "application/octet-stream"}\r
               });
             } else {
               if (!isErrored(stream)) {
-                const buffer = new Uint8Array(value);
+                const buffer = new Uint8Array(value2);
                 if (buffer.byteLength) {
                   controller.enqueue(buffer);
                 }
@@ -5655,12 +5655,12 @@ Content-Type: ${value.type || "application/octet-stream"}\r
           return consumeBody(this, parseJSONFromBytes, instance);
         },
         formData() {
-          return consumeBody(this, (value) => {
+          return consumeBody(this, (value2) => {
             const mimeType = bodyMimeType(this);
             if (mimeType !== null) {
               switch (mimeType.essence) {
                 case "multipart/form-data": {
-                  const parsed = multipartFormDataParser(value, mimeType);
+                  const parsed = multipartFormDataParser(value2, mimeType);
                   if (parsed === "failure") {
                     throw new TypeError("Failed to parse body as FormData.");
                   }
@@ -5669,10 +5669,10 @@ Content-Type: ${value.type || "application/octet-stream"}\r
                   return fd2;
                 }
                 case "application/x-www-form-urlencoded": {
-                  const entries = new URLSearchParams(value.toString());
+                  const entries = new URLSearchParams(value2.toString());
                   const fd2 = new FormData();
-                  for (const [name, value2] of entries) {
-                    fd2.append(name, value2);
+                  for (const [name, value3] of entries) {
+                    fd2.append(name, value3);
                   }
                   return fd2;
                 }
@@ -6928,13 +6928,13 @@ var require_client_h2 = __commonJS({
     } = http2;
     function parseH2Headers(headers) {
       const result = [];
-      for (const [name, value] of Object.entries(headers)) {
-        if (Array.isArray(value)) {
-          for (const subvalue of value) {
+      for (const [name, value2] of Object.entries(headers)) {
+        if (Array.isArray(value2)) {
+          for (const subvalue of value2) {
             result.push(Buffer.from(name), Buffer.from(subvalue));
           }
         } else {
-          result.push(Buffer.from(name), Buffer.from(value));
+          result.push(Buffer.from(name), Buffer.from(value2));
         }
       }
       return result;
@@ -7852,8 +7852,8 @@ var require_client = __commonJS({
       get pipelining() {
         return this[kPipelining];
       }
-      set pipelining(value) {
-        this[kPipelining] = value;
+      set pipelining(value2) {
+        this[kPipelining] = value2;
         this[kResume](true);
       }
       get [kPending]() {
@@ -10682,15 +10682,15 @@ var require_mock_utils = __commonJS({
         isPromise
       }
     } = __require("node:util");
-    function matchValue(match, value) {
+    function matchValue(match, value2) {
       if (typeof match === "string") {
-        return match === value;
+        return match === value2;
       }
       if (match instanceof RegExp) {
-        return match.test(value);
+        return match.test(value2);
       }
       if (typeof match === "function") {
-        return match(value) === true;
+        return match(value2) === true;
       }
       return false;
     }
@@ -10831,14 +10831,14 @@ var require_mock_utils = __commonJS({
       const result = [];
       for (let i2 = 0; i2 < keys.length; ++i2) {
         const key = keys[i2];
-        const value = data[key];
+        const value2 = data[key];
         const name = Buffer.from(`${key}`);
-        if (Array.isArray(value)) {
-          for (let j = 0; j < value.length; ++j) {
-            result.push(name, Buffer.from(`${value[j]}`));
+        if (Array.isArray(value2)) {
+          for (let j = 0; j < value2.length; ++j) {
+            result.push(name, Buffer.from(`${value2[j]}`));
           }
         } else {
-          result.push(name, Buffer.from(`${value}`));
+          result.push(name, Buffer.from(`${value2}`));
         }
       }
       return result;
@@ -11988,25 +11988,25 @@ var require_headers = __commonJS({
         });
       }
     }
-    function appendHeader(headers, name, value) {
-      value = headerValueNormalize(value);
+    function appendHeader(headers, name, value2) {
+      value2 = headerValueNormalize(value2);
       if (!isValidHeaderName(name)) {
         throw webidl.errors.invalidArgument({
           prefix: "Headers.append",
           value: name,
           type: "header name"
         });
-      } else if (!isValidHeaderValue(value)) {
+      } else if (!isValidHeaderValue(value2)) {
         throw webidl.errors.invalidArgument({
           prefix: "Headers.append",
-          value,
+          value: value2,
           type: "header value"
         });
       }
       if (getHeadersGuard(headers) === "immutable") {
         throw new TypeError("immutable");
       }
-      return getHeadersList(headers).append(name, value, false);
+      return getHeadersList(headers).append(name, value2, false);
     }
     function compareHeaderName(a, b) {
       return a[0] < b[0] ? -1 : 1;
@@ -12043,7 +12043,7 @@ var require_headers = __commonJS({
        * @param {string} value
        * @param {boolean} isLowerCase
        */
-      append(name, value, isLowerCase) {
+      append(name, value2, isLowerCase) {
         this[kHeadersSortedMap] = null;
         const lowercaseName = isLowerCase ? name : name.toLowerCase();
         const exists2 = this[kHeadersMap].get(lowercaseName);
@@ -12051,13 +12051,13 @@ var require_headers = __commonJS({
           const delimiter = lowercaseName === "cookie" ? "; " : ", ";
           this[kHeadersMap].set(lowercaseName, {
             name: exists2.name,
-            value: `${exists2.value}${delimiter}${value}`
+            value: `${exists2.value}${delimiter}${value2}`
           });
         } else {
-          this[kHeadersMap].set(lowercaseName, { name, value });
+          this[kHeadersMap].set(lowercaseName, { name, value: value2 });
         }
         if (lowercaseName === "set-cookie") {
-          (this.cookies ??= []).push(value);
+          (this.cookies ??= []).push(value2);
         }
       }
       /**
@@ -12066,13 +12066,13 @@ var require_headers = __commonJS({
        * @param {string} value
        * @param {boolean} isLowerCase
        */
-      set(name, value, isLowerCase) {
+      set(name, value2, isLowerCase) {
         this[kHeadersSortedMap] = null;
         const lowercaseName = isLowerCase ? name : name.toLowerCase();
         if (lowercaseName === "set-cookie") {
-          this.cookies = [value];
+          this.cookies = [value2];
         }
-        this[kHeadersMap].set(lowercaseName, { name, value });
+        this[kHeadersMap].set(lowercaseName, { name, value: value2 });
       }
       /**
        * @see https://fetch.spec.whatwg.org/#concept-header-list-delete
@@ -12097,15 +12097,15 @@ var require_headers = __commonJS({
         return this[kHeadersMap].get(isLowerCase ? name : name.toLowerCase())?.value ?? null;
       }
       *[Symbol.iterator]() {
-        for (const { 0: name, 1: { value } } of this[kHeadersMap]) {
-          yield [name, value];
+        for (const { 0: name, 1: { value: value2 } } of this[kHeadersMap]) {
+          yield [name, value2];
         }
       }
       get entries() {
         const headers = {};
         if (this[kHeadersMap].size !== 0) {
-          for (const { name, value } of this[kHeadersMap].values()) {
-            headers[name] = value;
+          for (const { name, value: value2 } of this[kHeadersMap].values()) {
+            headers[name] = value2;
           }
         }
         return headers;
@@ -12116,13 +12116,13 @@ var require_headers = __commonJS({
       get entriesList() {
         const headers = [];
         if (this[kHeadersMap].size !== 0) {
-          for (const { 0: lowerName, 1: { name, value } } of this[kHeadersMap]) {
+          for (const { 0: lowerName, 1: { name, value: value2 } } of this[kHeadersMap]) {
             if (lowerName === "set-cookie") {
               for (const cookie of this.cookies) {
                 headers.push([name, cookie]);
               }
             } else {
-              headers.push([name, value]);
+              headers.push([name, value2]);
             }
           }
         }
@@ -12140,9 +12140,9 @@ var require_headers = __commonJS({
           const firstValue = iterator2.next().value;
           array[0] = [firstValue[0], firstValue[1].value];
           assert(firstValue[1].value !== null);
-          for (let i2 = 1, j = 0, right = 0, left = 0, pivot = 0, x2, value; i2 < size; ++i2) {
-            value = iterator2.next().value;
-            x2 = array[i2] = [value[0], value[1].value];
+          for (let i2 = 1, j = 0, right = 0, left = 0, pivot = 0, x2, value2; i2 < size; ++i2) {
+            value2 = iterator2.next().value;
+            x2 = array[i2] = [value2[0], value2[1].value];
             assert(x2[1] !== null);
             left = 0;
             right = i2;
@@ -12168,9 +12168,9 @@ var require_headers = __commonJS({
           return array;
         } else {
           let i2 = 0;
-          for (const { 0: name, 1: { value } } of this[kHeadersMap]) {
-            array[i2++] = [name, value];
-            assert(value !== null);
+          for (const { 0: name, 1: { value: value2 } } of this[kHeadersMap]) {
+            array[i2++] = [name, value2];
+            assert(value2 !== null);
           }
           return array.sort(compareHeaderName);
         }
@@ -12192,13 +12192,13 @@ var require_headers = __commonJS({
         }
       }
       // https://fetch.spec.whatwg.org/#dom-headers-append
-      append(name, value) {
+      append(name, value2) {
         webidl.brandCheck(this, _Headers);
         webidl.argumentLengthCheck(arguments, 2, "Headers.append");
         const prefix = "Headers.append";
         name = webidl.converters.ByteString(name, prefix, "name");
-        value = webidl.converters.ByteString(value, prefix, "value");
-        return appendHeader(this, name, value);
+        value2 = webidl.converters.ByteString(value2, prefix, "value");
+        return appendHeader(this, name, value2);
       }
       // https://fetch.spec.whatwg.org/#dom-headers-delete
       delete(name) {
@@ -12252,30 +12252,30 @@ var require_headers = __commonJS({
         return this.#headersList.contains(name, false);
       }
       // https://fetch.spec.whatwg.org/#dom-headers-set
-      set(name, value) {
+      set(name, value2) {
         webidl.brandCheck(this, _Headers);
         webidl.argumentLengthCheck(arguments, 2, "Headers.set");
         const prefix = "Headers.set";
         name = webidl.converters.ByteString(name, prefix, "name");
-        value = webidl.converters.ByteString(value, prefix, "value");
-        value = headerValueNormalize(value);
+        value2 = webidl.converters.ByteString(value2, prefix, "value");
+        value2 = headerValueNormalize(value2);
         if (!isValidHeaderName(name)) {
           throw webidl.errors.invalidArgument({
             prefix,
             value: name,
             type: "header name"
           });
-        } else if (!isValidHeaderValue(value)) {
+        } else if (!isValidHeaderValue(value2)) {
           throw webidl.errors.invalidArgument({
             prefix,
-            value,
+            value: value2,
             type: "header value"
           });
         }
         if (this.#guard === "immutable") {
           throw new TypeError("immutable");
         }
-        this.#headersList.set(name, value, false);
+        this.#headersList.set(name, value2, false);
       }
       // https://fetch.spec.whatwg.org/#dom-headers-getsetcookie
       getSetCookie() {
@@ -12292,19 +12292,19 @@ var require_headers = __commonJS({
           return this.#headersList[kHeadersSortedMap];
         }
         const headers = [];
-        const names = this.#headersList.toSortedArray();
+        const names2 = this.#headersList.toSortedArray();
         const cookies = this.#headersList.cookies;
         if (cookies === null || cookies.length === 1) {
-          return this.#headersList[kHeadersSortedMap] = names;
+          return this.#headersList[kHeadersSortedMap] = names2;
         }
-        for (let i2 = 0; i2 < names.length; ++i2) {
-          const { 0: name, 1: value } = names[i2];
+        for (let i2 = 0; i2 < names2.length; ++i2) {
+          const { 0: name, 1: value2 } = names2[i2];
           if (name === "set-cookie") {
             for (let j = 0; j < cookies.length; ++j) {
               headers.push([name, cookies[j]]);
             }
           } else {
-            headers.push([name, value]);
+            headers.push([name, value2]);
           }
         }
         return this.#headersList[kHeadersSortedMap] = headers;
@@ -12448,8 +12448,8 @@ var require_response = __commonJS({
         }
         const responseObject = fromInnerResponse(makeResponse({}), "immutable");
         responseObject[kState].status = status;
-        const value = isomorphicEncode(URLSerializer(parsedURL));
-        responseObject[kState].headersList.append("location", value, true);
+        const value2 = isomorphicEncode(URLSerializer(parsedURL));
+        responseObject[kState].headersList.append("location", value2, true);
         return responseObject;
       }
       // https://fetch.spec.whatwg.org/#dom-response
@@ -12631,9 +12631,9 @@ var require_response = __commonJS({
         get(target, p) {
           return p in state ? state[p] : target[p];
         },
-        set(target, p, value) {
+        set(target, p, value2) {
           assert(!(p in state));
-          target[p] = value;
+          target[p] = value2;
           return true;
         }
       });
@@ -12786,8 +12786,8 @@ var require_dispatcher_weakref = __commonJS({
     "use strict";
     var { kConnected, kSize } = require_symbols();
     var CompatWeakRef = class {
-      constructor(value) {
-        this.value = value;
+      constructor(value2) {
+        this.value = value2;
       }
       deref() {
         return this.value[kConnected] === 0 && this.value[kSize] === 0 ? void 0 : this.value;
@@ -13111,8 +13111,8 @@ var require_request2 = __commonJS({
           const headers = init.headers !== void 0 ? init.headers : new HeadersList(headersList);
           headersList.clear();
           if (headers instanceof HeadersList) {
-            for (const { name, value } of headers.rawValues()) {
-              headersList.append(name, value, false);
+            for (const { name, value: value2 } of headers.rawValues()) {
+              headersList.append(name, value2, false);
             }
             headersList.cookies = headers.cookies;
           } else {
@@ -13785,8 +13785,8 @@ var require_fetch = __commonJS({
         }
       }
       if (!request2.headersList.contains("accept", true)) {
-        const value = "*/*";
-        request2.headersList.append("accept", value, true);
+        const value2 = "*/*";
+        request2.headersList.append("accept", value2, true);
       }
       if (!request2.headersList.contains("accept-language", true)) {
         request2.headersList.append("accept-language", "*", true);
@@ -14385,11 +14385,11 @@ var require_fetch = __commonJS({
           let bytes;
           let isFailure;
           try {
-            const { done, value } = await fetchParams.controller.next();
+            const { done, value: value2 } = await fetchParams.controller.next();
             if (isAborted(fetchParams)) {
               break;
             }
-            bytes = done ? void 0 : value;
+            bytes = done ? void 0 : value2;
           } catch (err2) {
             if (fetchParams.controller.ended && !timingInfo.encodedBodySize) {
               bytes = void 0;
@@ -14988,15 +14988,15 @@ var require_util4 = __commonJS({
       (async () => {
         while (!fr[kAborted]) {
           try {
-            const { done, value } = await chunkPromise;
+            const { done, value: value2 } = await chunkPromise;
             if (isFirstChunk && !fr[kAborted]) {
               queueMicrotask(() => {
                 fireAProgressEvent("loadstart", fr);
               });
             }
             isFirstChunk = false;
-            if (!done && types.isUint8Array(value)) {
-              bytes.push(value);
+            if (!done && types.isUint8Array(value2)) {
+              bytes.push(value2);
               if ((fr[kLastProgressEventFired] === void 0 || Date.now() - fr[kLastProgressEventFired] >= 50) && !fr[kAborted]) {
                 fr[kLastProgressEventFired] = Date.now();
                 queueMicrotask(() => {
@@ -15420,10 +15420,10 @@ var require_util5 = __commonJS({
     function getFieldValues(header) {
       assert(header !== null);
       const values = [];
-      for (let value of header.split(",")) {
-        value = value.trim();
-        if (isValidHeaderName(value)) {
-          values.push(value);
+      for (let value2 of header.split(",")) {
+        value2 = value2.trim();
+        if (isValidHeaderName(value2)) {
+          values.push(value2);
         }
       }
       return values;
@@ -16107,9 +16107,9 @@ var require_constants4 = __commonJS({
 var require_util6 = __commonJS({
   "node_modules/undici/lib/web/cookies/util.js"(exports, module) {
     "use strict";
-    function isCTLExcludingHtab(value) {
-      for (let i2 = 0; i2 < value.length; ++i2) {
-        const code = value.charCodeAt(i2);
+    function isCTLExcludingHtab(value2) {
+      for (let i2 = 0; i2 < value2.length; ++i2) {
+        const code = value2.charCodeAt(i2);
         if (code >= 0 && code <= 8 || code >= 10 && code <= 31 || code === 127) {
           return true;
         }
@@ -16142,18 +16142,18 @@ var require_util6 = __commonJS({
         }
       }
     }
-    function validateCookieValue(value) {
-      let len = value.length;
+    function validateCookieValue(value2) {
+      let len = value2.length;
       let i2 = 0;
-      if (value[0] === '"') {
-        if (len === 1 || value[len - 1] !== '"') {
+      if (value2[0] === '"') {
+        if (len === 1 || value2[len - 1] !== '"') {
           throw new Error("Invalid cookie value");
         }
         --len;
         ++i2;
       }
       while (i2 < len) {
-        const code = value.charCodeAt(i2++);
+        const code = value2.charCodeAt(i2++);
         if (code < 33 || // exclude CTLs (0-31)
         code > 126 || // non-ascii and DEL (127)
         code === 34 || // "
@@ -16291,9 +16291,9 @@ var require_util6 = __commonJS({
         if (!part.includes("=")) {
           throw new Error("Invalid unparsed");
         }
-        const [key, ...value] = part.split("=");
+        const [key, ...value2] = part.split("=");
         const trimmedKey = key.trim();
-        const joinedValue = value.join("=");
+        const joinedValue = value2.join("=");
         validateCookieName(trimmedKey);
         validateCookieValue(joinedValue);
         out.push(`${trimmedKey}=${joinedValue}`);
@@ -16326,7 +16326,7 @@ var require_parse = __commonJS({
       let nameValuePair = "";
       let unparsedAttributes = "";
       let name = "";
-      let value = "";
+      let value2 = "";
       if (header.includes(";")) {
         const position = { position: 0 };
         nameValuePair = collectASequenceOfCodePointsFast(";", header, position);
@@ -16335,7 +16335,7 @@ var require_parse = __commonJS({
         nameValuePair = header;
       }
       if (!nameValuePair.includes("=")) {
-        value = nameValuePair;
+        value2 = nameValuePair;
       } else {
         const position = { position: 0 };
         name = collectASequenceOfCodePointsFast(
@@ -16343,16 +16343,16 @@ var require_parse = __commonJS({
           nameValuePair,
           position
         );
-        value = nameValuePair.slice(position.position + 1);
+        value2 = nameValuePair.slice(position.position + 1);
       }
       name = name.trim();
-      value = value.trim();
-      if (name.length + value.length > maxNameValuePairSize) {
+      value2 = value2.trim();
+      if (name.length + value2.length > maxNameValuePairSize) {
         return null;
       }
       return {
         name,
-        value,
+        value: value2,
         ...parseUnparsedAttributes(unparsedAttributes)
       };
     }
@@ -16464,8 +16464,8 @@ var require_cookies = __commonJS({
         return out;
       }
       for (const piece of cookie.split(";")) {
-        const [name, ...value] = piece.split("=");
-        out[name.trim()] = value.join("=");
+        const [name, ...value2] = piece.split("=");
+        out[name.trim()] = value2.join("=");
       }
       return out;
     }
@@ -16522,11 +16522,11 @@ var require_cookies = __commonJS({
         key: "value"
       },
       {
-        converter: webidl.nullableConverter((value) => {
-          if (typeof value === "number") {
-            return webidl.converters["unsigned long long"](value);
+        converter: webidl.nullableConverter((value2) => {
+          if (typeof value2 === "number") {
+            return webidl.converters["unsigned long long"](value2);
           }
-          return new Date(value);
+          return new Date(value2);
         }),
         key: "expires",
         defaultValue: () => null
@@ -17038,27 +17038,27 @@ var require_util7 = __commonJS({
       const extensionList = /* @__PURE__ */ new Map();
       while (position.position < extensions.length) {
         const pair = collectASequenceOfCodePointsFast(";", extensions, position);
-        const [name, value = ""] = pair.split("=");
+        const [name, value2 = ""] = pair.split("=");
         extensionList.set(
           removeHTTPWhitespace(name, true, false),
-          removeHTTPWhitespace(value, false, true)
+          removeHTTPWhitespace(value2, false, true)
         );
         position.position++;
       }
       return extensionList;
     }
-    function isValidClientWindowBits(value) {
-      if (value.length === 0) {
+    function isValidClientWindowBits(value2) {
+      if (value2.length === 0) {
         return false;
       }
-      for (let i2 = 0; i2 < value.length; i2++) {
-        const byte = value.charCodeAt(i2);
+      for (let i2 = 0; i2 < value2.length; i2++) {
+        const byte = value2.charCodeAt(i2);
         if (byte < 48 || byte > 57) {
           return false;
         }
       }
-      const num2 = Number.parseInt(value, 10);
-      return num2 >= 8 && num2 <= 15;
+      const num = Number.parseInt(value2, 10);
+      return num >= 8 && num <= 15;
     }
     var hasIntl = typeof process.versions.icu === "string";
     var fatalDecoder = hasIntl ? new TextDecoder("utf-8", { fatal: true }) : void 0;
@@ -18291,13 +18291,13 @@ var require_websocket = __commonJS({
 var require_util8 = __commonJS({
   "node_modules/undici/lib/web/eventsource/util.js"(exports, module) {
     "use strict";
-    function isValidLastEventId(value) {
-      return value.indexOf("\0") === -1;
+    function isValidLastEventId(value2) {
+      return value2.indexOf("\0") === -1;
     }
-    function isASCIINumber(value) {
-      if (value.length === 0) return false;
-      for (let i2 = 0; i2 < value.length; i2++) {
-        if (value.charCodeAt(i2) < 48 || value.charCodeAt(i2) > 57) return false;
+    function isASCIINumber(value2) {
+      if (value2.length === 0) return false;
+      for (let i2 = 0; i2 < value2.length; i2++) {
+        if (value2.charCodeAt(i2) < 48 || value2.charCodeAt(i2) > 57) return false;
       }
       return true;
     }
@@ -18528,12 +18528,12 @@ var require_eventsource_stream = __commonJS({
           const valueBytes = line.length - valueStart;
           const dataSize = this.eventFieldSizes.data + (event.data === void 0 ? 0 : 1) + valueBytes;
           this.setEventFieldSize("data", dataSize);
-          const value = line.toString("utf8", valueStart);
+          const value2 = line.toString("utf8", valueStart);
           if (event.data === void 0) {
-            event.data = value;
+            event.data = value2;
           } else {
             event.data += `
-${value}`;
+${value2}`;
           }
           this.dataLineCount++;
           return;
@@ -19209,10 +19209,10 @@ var require_code = __commonJS({
       }
       get names() {
         var _a2;
-        return (_a2 = this._names) !== null && _a2 !== void 0 ? _a2 : this._names = this._items.reduce((names, c) => {
+        return (_a2 = this._names) !== null && _a2 !== void 0 ? _a2 : this._names = this._items.reduce((names2, c) => {
           if (c instanceof Name)
-            names[c.str] = (names[c.str] || 0) + 1;
-          return names;
+            names2[c.str] = (names2[c.str] || 0) + 1;
+          return names2;
         }, {});
       }
     };
@@ -19368,8 +19368,8 @@ var require_scope = __commonJS({
         super(nameStr);
         this.prefix = prefix;
       }
-      setValue(value, { property, itemIndex }) {
-        this.value = value;
+      setValue(value2, { property, itemIndex }) {
+        this.value = value2;
         this.scopePath = (0, code_1._)`.${new code_1.Name(property)}[${itemIndex}]`;
       }
     };
@@ -19388,13 +19388,13 @@ var require_scope = __commonJS({
       name(prefix) {
         return new ValueScopeName(prefix, this._newName(prefix));
       }
-      value(nameOrPrefix, value) {
+      value(nameOrPrefix, value2) {
         var _a2;
-        if (value.ref === void 0)
+        if (value2.ref === void 0)
           throw new Error("CodeGen: ref must be passed in value");
         const name = this.toName(nameOrPrefix);
         const { prefix } = name;
-        const valueKey = (_a2 = value.key) !== null && _a2 !== void 0 ? _a2 : value.ref;
+        const valueKey = (_a2 = value2.key) !== null && _a2 !== void 0 ? _a2 : value2.ref;
         let vs = this._values[prefix];
         if (vs) {
           const _name = vs.get(valueKey);
@@ -19406,8 +19406,8 @@ var require_scope = __commonJS({
         vs.set(valueKey, name);
         const s = this._scope[prefix] || (this._scope[prefix] = []);
         const itemIndex = s.length;
-        s[itemIndex] = value.ref;
-        name.setValue(value, { property: prefix, itemIndex });
+        s[itemIndex] = value2.ref;
+        name.setValue(value2, { property: prefix, itemIndex });
         return name;
       }
       getValue(prefix, keyOrRef) {
@@ -19538,11 +19538,11 @@ var require_codegen = __commonJS({
         const rhs = this.rhs === void 0 ? "" : ` = ${this.rhs}`;
         return `${varKind} ${this.name}${rhs};` + _n;
       }
-      optimizeNames(names, constants4) {
-        if (!names[this.name.str])
+      optimizeNames(names2, constants4) {
+        if (!names2[this.name.str])
           return;
         if (this.rhs)
-          this.rhs = optimizeExpr(this.rhs, names, constants4);
+          this.rhs = optimizeExpr(this.rhs, names2, constants4);
         return this;
       }
       get names() {
@@ -19559,15 +19559,15 @@ var require_codegen = __commonJS({
       render({ _n }) {
         return `${this.lhs} = ${this.rhs};` + _n;
       }
-      optimizeNames(names, constants4) {
-        if (this.lhs instanceof code_1.Name && !names[this.lhs.str] && !this.sideEffects)
+      optimizeNames(names2, constants4) {
+        if (this.lhs instanceof code_1.Name && !names2[this.lhs.str] && !this.sideEffects)
           return;
-        this.rhs = optimizeExpr(this.rhs, names, constants4);
+        this.rhs = optimizeExpr(this.rhs, names2, constants4);
         return this;
       }
       get names() {
-        const names = this.lhs instanceof code_1.Name ? {} : { ...this.lhs.names };
-        return addExprNames(names, this.rhs);
+        const names2 = this.lhs instanceof code_1.Name ? {} : { ...this.lhs.names };
+        return addExprNames(names2, this.rhs);
       }
     };
     var AssignOp = class extends Assign {
@@ -19623,8 +19623,8 @@ var require_codegen = __commonJS({
       optimizeNodes() {
         return `${this.code}` ? this : void 0;
       }
-      optimizeNames(names, constants4) {
-        this.code = optimizeExpr(this.code, names, constants4);
+      optimizeNames(names2, constants4) {
+        this.code = optimizeExpr(this.code, names2, constants4);
         return this;
       }
       get names() {
@@ -19653,20 +19653,20 @@ var require_codegen = __commonJS({
         }
         return nodes.length > 0 ? this : void 0;
       }
-      optimizeNames(names, constants4) {
+      optimizeNames(names2, constants4) {
         const { nodes } = this;
         let i2 = nodes.length;
         while (i2--) {
           const n = nodes[i2];
-          if (n.optimizeNames(names, constants4))
+          if (n.optimizeNames(names2, constants4))
             continue;
-          subtractNames(names, n.names);
+          subtractNames(names2, n.names);
           nodes.splice(i2, 1);
         }
         return nodes.length > 0 ? this : void 0;
       }
       get names() {
-        return this.nodes.reduce((names, n) => addNames(names, n.names), {});
+        return this.nodes.reduce((names2, n) => addNames(names2, n.names), {});
       }
     };
     var BlockNode = class extends ParentNode {
@@ -19711,20 +19711,20 @@ var require_codegen = __commonJS({
           return void 0;
         return this;
       }
-      optimizeNames(names, constants4) {
+      optimizeNames(names2, constants4) {
         var _a2;
-        this.else = (_a2 = this.else) === null || _a2 === void 0 ? void 0 : _a2.optimizeNames(names, constants4);
-        if (!(super.optimizeNames(names, constants4) || this.else))
+        this.else = (_a2 = this.else) === null || _a2 === void 0 ? void 0 : _a2.optimizeNames(names2, constants4);
+        if (!(super.optimizeNames(names2, constants4) || this.else))
           return;
-        this.condition = optimizeExpr(this.condition, names, constants4);
+        this.condition = optimizeExpr(this.condition, names2, constants4);
         return this;
       }
       get names() {
-        const names = super.names;
-        addExprNames(names, this.condition);
+        const names2 = super.names;
+        addExprNames(names2, this.condition);
         if (this.else)
-          addNames(names, this.else.names);
-        return names;
+          addNames(names2, this.else.names);
+        return names2;
       }
     };
     If.kind = "if";
@@ -19739,10 +19739,10 @@ var require_codegen = __commonJS({
       render(opts) {
         return `for(${this.iteration})` + super.render(opts);
       }
-      optimizeNames(names, constants4) {
-        if (!super.optimizeNames(names, constants4))
+      optimizeNames(names2, constants4) {
+        if (!super.optimizeNames(names2, constants4))
           return;
-        this.iteration = optimizeExpr(this.iteration, names, constants4);
+        this.iteration = optimizeExpr(this.iteration, names2, constants4);
         return this;
       }
       get names() {
@@ -19763,8 +19763,8 @@ var require_codegen = __commonJS({
         return `for(${varKind} ${name}=${from}; ${name}<${to}; ${name}++)` + super.render(opts);
       }
       get names() {
-        const names = addExprNames(super.names, this.from);
-        return addExprNames(names, this.to);
+        const names2 = addExprNames(super.names, this.from);
+        return addExprNames(names2, this.to);
       }
     };
     var ForIter = class extends For {
@@ -19778,10 +19778,10 @@ var require_codegen = __commonJS({
       render(opts) {
         return `for(${this.varKind} ${this.name} ${this.loop} ${this.iterable})` + super.render(opts);
       }
-      optimizeNames(names, constants4) {
-        if (!super.optimizeNames(names, constants4))
+      optimizeNames(names2, constants4) {
+        if (!super.optimizeNames(names2, constants4))
           return;
-        this.iterable = optimizeExpr(this.iterable, names, constants4);
+        this.iterable = optimizeExpr(this.iterable, names2, constants4);
         return this;
       }
       get names() {
@@ -19823,20 +19823,20 @@ var require_codegen = __commonJS({
         (_b2 = this.finally) === null || _b2 === void 0 ? void 0 : _b2.optimizeNodes();
         return this;
       }
-      optimizeNames(names, constants4) {
+      optimizeNames(names2, constants4) {
         var _a2, _b2;
-        super.optimizeNames(names, constants4);
-        (_a2 = this.catch) === null || _a2 === void 0 ? void 0 : _a2.optimizeNames(names, constants4);
-        (_b2 = this.finally) === null || _b2 === void 0 ? void 0 : _b2.optimizeNames(names, constants4);
+        super.optimizeNames(names2, constants4);
+        (_a2 = this.catch) === null || _a2 === void 0 ? void 0 : _a2.optimizeNames(names2, constants4);
+        (_b2 = this.finally) === null || _b2 === void 0 ? void 0 : _b2.optimizeNames(names2, constants4);
         return this;
       }
       get names() {
-        const names = super.names;
+        const names2 = super.names;
         if (this.catch)
-          addNames(names, this.catch.names);
+          addNames(names2, this.catch.names);
         if (this.finally)
-          addNames(names, this.finally.names);
-        return names;
+          addNames(names2, this.finally.names);
+        return names2;
       }
     };
     var Catch = class extends BlockNode {
@@ -19877,8 +19877,8 @@ var require_codegen = __commonJS({
         return this._extScope.name(prefix);
       }
       // reserves unique name in the external scope and assigns value to it
-      scopeValue(prefixOrName, value) {
-        const name = this._extScope.value(prefixOrName, value);
+      scopeValue(prefixOrName, value2) {
+        const name = this._extScope.value(prefixOrName, value2);
         const vs = this._values[name.prefix] || (this._values[name.prefix] = /* @__PURE__ */ new Set());
         vs.add(name);
         return name;
@@ -19932,13 +19932,13 @@ var require_codegen = __commonJS({
       // returns code for object literal for the passed argument list of key-value pairs
       object(...keyValues) {
         const code = ["{"];
-        for (const [key, value] of keyValues) {
+        for (const [key, value2] of keyValues) {
           if (code.length > 1)
             code.push(",");
           code.push(key);
-          if (key !== value || this.opts.es5) {
+          if (key !== value2 || this.opts.es5) {
             code.push(":");
-            (0, code_1.addCodeArg)(code, value);
+            (0, code_1.addCodeArg)(code, value2);
           }
         }
         code.push("}");
@@ -20017,10 +20017,10 @@ var require_codegen = __commonJS({
         return this._leafNode(new Break(label));
       }
       // `return` statement
-      return(value) {
+      return(value2) {
         const node = new Return();
         this._blockNode(node);
-        this.code(value);
+        this.code(value2);
         if (node.nodes.length !== 1)
           throw new Error('CodeGen: "return" should have one node');
         return this._endBlockNode(Return);
@@ -20120,15 +20120,15 @@ var require_codegen = __commonJS({
       }
     };
     exports.CodeGen = CodeGen;
-    function addNames(names, from) {
+    function addNames(names2, from) {
       for (const n in from)
-        names[n] = (names[n] || 0) + (from[n] || 0);
-      return names;
+        names2[n] = (names2[n] || 0) + (from[n] || 0);
+      return names2;
     }
-    function addExprNames(names, from) {
-      return from instanceof code_1._CodeOrName ? addNames(names, from.names) : names;
+    function addExprNames(names2, from) {
+      return from instanceof code_1._CodeOrName ? addNames(names2, from.names) : names2;
     }
-    function optimizeExpr(expr, names, constants4) {
+    function optimizeExpr(expr, names2, constants4) {
       if (expr instanceof code_1.Name)
         return replaceName(expr);
       if (!canOptimize(expr))
@@ -20144,18 +20144,18 @@ var require_codegen = __commonJS({
       }, []));
       function replaceName(n) {
         const c = constants4[n.str];
-        if (c === void 0 || names[n.str] !== 1)
+        if (c === void 0 || names2[n.str] !== 1)
           return n;
-        delete names[n.str];
+        delete names2[n.str];
         return c;
       }
       function canOptimize(e) {
-        return e instanceof code_1._Code && e._items.some((c) => c instanceof code_1.Name && names[c.str] === 1 && constants4[c.str] !== void 0);
+        return e instanceof code_1._Code && e._items.some((c) => c instanceof code_1.Name && names2[c.str] === 1 && constants4[c.str] !== void 0);
       }
     }
-    function subtractNames(names, from) {
+    function subtractNames(names2, from) {
       for (const n in from)
-        names[n] = (names[n] || 0) - (from[n] || 0);
+        names2[n] = (names2[n] || 0) - (from[n] || 0);
     }
     function not(x2) {
       return typeof x2 == "boolean" || typeof x2 == "number" || x2 === null ? !x2 : (0, code_1._)`!${par(x2)}`;
@@ -20353,7 +20353,7 @@ var require_names = __commonJS({
     "use strict";
     Object.defineProperty(exports, "__esModule", { value: true });
     var codegen_1 = require_codegen();
-    var names = {
+    var names2 = {
       // validation function arguments
       data: new codegen_1.Name("data"),
       // data passed to validation function
@@ -20382,7 +20382,7 @@ var require_names = __commonJS({
       jsonLen: new codegen_1.Name("jsonLen"),
       jsonPart: new codegen_1.Name("jsonPart")
     };
-    exports.default = names;
+    exports.default = names2;
   }
 });
 
@@ -23382,13 +23382,13 @@ var require_fast_uri = __commonJS({
       if (typeof uri !== "string" && typeof uri !== "object") {
         return void 0;
       }
-      let value;
+      let value2;
       try {
-        value = typeof uri === "string" ? uri : serialize2(uri, opts);
+        value2 = typeof uri === "string" ? uri : serialize2(uri, opts);
       } catch {
         return void 0;
       }
-      const { normalized, malformedAuthorityOrPort, malformedPercentEncoding, malformedSchemeSpecific, malformedHost, malformedScheme } = normalizeStringWithStatus(value, opts);
+      const { normalized, malformedAuthorityOrPort, malformedPercentEncoding, malformedSchemeSpecific, malformedHost, malformedScheme } = normalizeStringWithStatus(value2, opts);
       return malformedAuthorityOrPort || malformedPercentEncoding || malformedSchemeSpecific || malformedHost || malformedScheme ? void 0 : normalized;
     }
     var fastUri = {
@@ -24255,13 +24255,13 @@ var require_ucs2length = __commonJS({
       const len = str.length;
       let length = 0;
       let pos = 0;
-      let value;
+      let value2;
       while (pos < len) {
         length++;
-        value = str.charCodeAt(pos++);
-        if (value >= 55296 && value <= 56319 && pos < len) {
-          value = str.charCodeAt(pos);
-          if ((value & 64512) === 56320)
+        value2 = str.charCodeAt(pos++);
+        if (value2 >= 55296 && value2 <= 56319 && pos < len) {
+          value2 = str.charCodeAt(pos);
+          if ((value2 & 64512) === 56320)
             pos++;
         }
       }
@@ -26078,7 +26078,7 @@ var require_jstat = __commonJS({
         window2.jStat = factory();
       }
     })(exports, function() {
-      var jStat2 = (function(Math2, undefined2) {
+      var jStat3 = (function(Math2, undefined2) {
         var concat = Array.prototype.concat;
         var slice = Array.prototype.slice;
         var toString = Object.prototype.toString;
@@ -26095,59 +26095,59 @@ var require_jstat = __commonJS({
         function isFunction(arg) {
           return toString.call(arg) === "[object Function]";
         }
-        function isNumber(num2) {
-          return typeof num2 === "number" ? num2 - num2 === 0 : false;
+        function isNumber(num) {
+          return typeof num === "number" ? num - num === 0 : false;
         }
         function toVector(arr) {
           return concat.apply([], arr);
         }
-        function jStat3() {
-          return new jStat3._init(arguments);
+        function jStat4() {
+          return new jStat4._init(arguments);
         }
-        jStat3.fn = jStat3.prototype;
-        jStat3._init = function _init(args) {
+        jStat4.fn = jStat4.prototype;
+        jStat4._init = function _init(args) {
           if (isArray(args[0])) {
             if (isArray(args[0][0])) {
               if (isFunction(args[1]))
-                args[0] = jStat3.map(args[0], args[1]);
+                args[0] = jStat4.map(args[0], args[1]);
               for (var i2 = 0; i2 < args[0].length; i2++)
                 this[i2] = args[0][i2];
               this.length = args[0].length;
             } else {
-              this[0] = isFunction(args[1]) ? jStat3.map(args[0], args[1]) : args[0];
+              this[0] = isFunction(args[1]) ? jStat4.map(args[0], args[1]) : args[0];
               this.length = 1;
             }
           } else if (isNumber(args[0])) {
-            this[0] = jStat3.seq.apply(null, args);
+            this[0] = jStat4.seq.apply(null, args);
             this.length = 1;
-          } else if (args[0] instanceof jStat3) {
-            return jStat3(args[0].toArray());
+          } else if (args[0] instanceof jStat4) {
+            return jStat4(args[0].toArray());
           } else {
             this[0] = [];
             this.length = 1;
           }
           return this;
         };
-        jStat3._init.prototype = jStat3.prototype;
-        jStat3._init.constructor = jStat3;
-        jStat3.utils = {
+        jStat4._init.prototype = jStat4.prototype;
+        jStat4._init.constructor = jStat4;
+        jStat4.utils = {
           calcRdx,
           isArray,
           isFunction,
           isNumber,
           toVector
         };
-        jStat3._random_fn = Math2.random;
-        jStat3.setRandom = function setRandom(fn) {
+        jStat4._random_fn = Math2.random;
+        jStat4.setRandom = function setRandom(fn) {
           if (typeof fn !== "function")
             throw new TypeError("fn is not a function");
-          jStat3._random_fn = fn;
+          jStat4._random_fn = fn;
         };
-        jStat3.extend = function extend(obj) {
+        jStat4.extend = function extend(obj) {
           var i2, j;
           if (arguments.length === 1) {
             for (j in obj)
-              jStat3[j] = obj[j];
+              jStat4[j] = obj[j];
             return this;
           }
           for (i2 = 1; i2 < arguments.length; i2++) {
@@ -26156,36 +26156,36 @@ var require_jstat = __commonJS({
           }
           return obj;
         };
-        jStat3.rows = function rows(arr) {
+        jStat4.rows = function rows(arr) {
           return arr.length || 1;
         };
-        jStat3.cols = function cols(arr) {
+        jStat4.cols = function cols(arr) {
           return arr[0].length || 1;
         };
-        jStat3.dimensions = function dimensions(arr) {
+        jStat4.dimensions = function dimensions(arr) {
           return {
-            rows: jStat3.rows(arr),
-            cols: jStat3.cols(arr)
+            rows: jStat4.rows(arr),
+            cols: jStat4.cols(arr)
           };
         };
-        jStat3.row = function row(arr, index) {
+        jStat4.row = function row(arr, index) {
           if (isArray(index)) {
             return index.map(function(i2) {
-              return jStat3.row(arr, i2);
+              return jStat4.row(arr, i2);
             });
           }
           return arr[index];
         };
-        jStat3.rowa = function rowa(arr, i2) {
-          return jStat3.row(arr, i2);
+        jStat4.rowa = function rowa(arr, i2) {
+          return jStat4.row(arr, i2);
         };
-        jStat3.col = function col(arr, index) {
+        jStat4.col = function col(arr, index) {
           if (isArray(index)) {
-            var submat = jStat3.arange(arr.length).map(function() {
+            var submat = jStat4.arange(arr.length).map(function() {
               return new Array(index.length);
             });
             index.forEach(function(ind, i3) {
-              jStat3.arange(arr.length).forEach(function(j) {
+              jStat4.arange(arr.length).forEach(function(j) {
                 submat[j][i3] = arr[j][ind];
               });
             });
@@ -26196,26 +26196,26 @@ var require_jstat = __commonJS({
             column[i2] = [arr[i2][index]];
           return column;
         };
-        jStat3.cola = function cola(arr, i2) {
-          return jStat3.col(arr, i2).map(function(a) {
+        jStat4.cola = function cola(arr, i2) {
+          return jStat4.col(arr, i2).map(function(a) {
             return a[0];
           });
         };
-        jStat3.diag = function diag(arr) {
-          var nrow = jStat3.rows(arr);
+        jStat4.diag = function diag(arr) {
+          var nrow = jStat4.rows(arr);
           var res = new Array(nrow);
           for (var row = 0; row < nrow; row++)
             res[row] = [arr[row][row]];
           return res;
         };
-        jStat3.antidiag = function antidiag(arr) {
-          var nrow = jStat3.rows(arr) - 1;
+        jStat4.antidiag = function antidiag(arr) {
+          var nrow = jStat4.rows(arr) - 1;
           var res = new Array(nrow);
           for (var i2 = 0; nrow >= 0; nrow--, i2++)
             res[i2] = [arr[i2][nrow]];
           return res;
         };
-        jStat3.transpose = function transpose(arr) {
+        jStat4.transpose = function transpose(arr) {
           var obj = [];
           var objArr, rows, cols, j, i2;
           if (!isArray(arr[0]))
@@ -26230,7 +26230,7 @@ var require_jstat = __commonJS({
           }
           return obj.length === 1 ? obj[0] : obj;
         };
-        jStat3.map = function map(arr, func, toAlter) {
+        jStat4.map = function map(arr, func, toAlter) {
           var row, nrow, ncol, res, col;
           if (!isArray(arr[0]))
             arr = [arr];
@@ -26245,7 +26245,7 @@ var require_jstat = __commonJS({
           }
           return res.length === 1 ? res[0] : res;
         };
-        jStat3.cumreduce = function cumreduce(arr, func, toAlter) {
+        jStat4.cumreduce = function cumreduce(arr, func, toAlter) {
           var row, nrow, ncol, res, col;
           if (!isArray(arr[0]))
             arr = [arr];
@@ -26262,10 +26262,10 @@ var require_jstat = __commonJS({
           }
           return res.length === 1 ? res[0] : res;
         };
-        jStat3.alter = function alter(arr, func) {
-          return jStat3.map(arr, func, true);
+        jStat4.alter = function alter(arr, func) {
+          return jStat4.map(arr, func, true);
         };
-        jStat3.create = function create(rows, cols, func) {
+        jStat4.create = function create(rows, cols, func) {
           var res = new Array(rows);
           var i2, j;
           if (isFunction(cols)) {
@@ -26282,33 +26282,33 @@ var require_jstat = __commonJS({
         function retZero() {
           return 0;
         }
-        jStat3.zeros = function zeros(rows, cols) {
+        jStat4.zeros = function zeros(rows, cols) {
           if (!isNumber(cols))
             cols = rows;
-          return jStat3.create(rows, cols, retZero);
+          return jStat4.create(rows, cols, retZero);
         };
         function retOne() {
           return 1;
         }
-        jStat3.ones = function ones(rows, cols) {
+        jStat4.ones = function ones(rows, cols) {
           if (!isNumber(cols))
             cols = rows;
-          return jStat3.create(rows, cols, retOne);
+          return jStat4.create(rows, cols, retOne);
         };
-        jStat3.rand = function rand(rows, cols) {
+        jStat4.rand = function rand(rows, cols) {
           if (!isNumber(cols))
             cols = rows;
-          return jStat3.create(rows, cols, jStat3._random_fn);
+          return jStat4.create(rows, cols, jStat4._random_fn);
         };
         function retIdent(i2, j) {
           return i2 === j ? 1 : 0;
         }
-        jStat3.identity = function identity(rows, cols) {
+        jStat4.identity = function identity(rows, cols) {
           if (!isNumber(cols))
             cols = rows;
-          return jStat3.create(rows, cols, retIdent);
+          return jStat4.create(rows, cols, retIdent);
         };
-        jStat3.symmetric = function symmetric(arr) {
+        jStat4.symmetric = function symmetric(arr) {
           var size = arr.length;
           var row, col;
           if (arr.length !== arr[0].length)
@@ -26320,10 +26320,10 @@ var require_jstat = __commonJS({
           }
           return true;
         };
-        jStat3.clear = function clear(arr) {
-          return jStat3.alter(arr, retZero);
+        jStat4.clear = function clear(arr) {
+          return jStat4.alter(arr, retZero);
         };
-        jStat3.seq = function seq(min, max2, length, func) {
+        jStat4.seq = function seq(min, max2, length, func) {
           if (!isFunction(func))
             func = false;
           var arr = [];
@@ -26336,7 +26336,7 @@ var require_jstat = __commonJS({
           }
           return arr;
         };
-        jStat3.arange = function arange(start, end, step) {
+        jStat4.arange = function arange(start, end, step) {
           var rl = [];
           var i2;
           step = step || 1;
@@ -26364,13 +26364,13 @@ var require_jstat = __commonJS({
           }
           return rl;
         };
-        jStat3.slice = /* @__PURE__ */ (function() {
+        jStat4.slice = /* @__PURE__ */ (function() {
           function _slice(list, start, end, step) {
             var i2;
             var rl = [];
             var length = list.length;
             if (start === undefined2 && end === undefined2 && step === undefined2) {
-              return jStat3.copy(list);
+              return jStat4.copy(list);
             }
             start = start || 0;
             end = end || list.length;
@@ -26403,12 +26403,12 @@ var require_jstat = __commonJS({
             if (isNumber(rcSlice.row)) {
               if (isNumber(rcSlice.col))
                 return list[rcSlice.row][rcSlice.col];
-              var row = jStat3.rowa(list, rcSlice.row);
+              var row = jStat4.rowa(list, rcSlice.row);
               colSlice = rcSlice.col || {};
               return _slice(row, colSlice.start, colSlice.end, colSlice.step);
             }
             if (isNumber(rcSlice.col)) {
-              var col = jStat3.cola(list, rcSlice.col);
+              var col = jStat4.cola(list, rcSlice.col);
               rowSlice = rcSlice.row || {};
               return _slice(col, rowSlice.start, rowSlice.end, rowSlice.step);
             }
@@ -26421,7 +26421,7 @@ var require_jstat = __commonJS({
           }
           return slice2;
         })();
-        jStat3.sliceAssign = function sliceAssign(A, rcSlice, B) {
+        jStat4.sliceAssign = function sliceAssign(A, rcSlice, B) {
           var nl, ml;
           if (isNumber(rcSlice.row)) {
             if (isNumber(rcSlice.col))
@@ -26430,7 +26430,7 @@ var require_jstat = __commonJS({
             rcSlice.col.start = rcSlice.col.start || 0;
             rcSlice.col.end = rcSlice.col.end || A[0].length;
             rcSlice.col.step = rcSlice.col.step || 1;
-            nl = jStat3.arange(
+            nl = jStat4.arange(
               rcSlice.col.start,
               Math2.min(A.length, rcSlice.col.end),
               rcSlice.col.step
@@ -26446,7 +26446,7 @@ var require_jstat = __commonJS({
             rcSlice.row.start = rcSlice.row.start || 0;
             rcSlice.row.end = rcSlice.row.end || A.length;
             rcSlice.row.step = rcSlice.row.step || 1;
-            ml = jStat3.arange(
+            ml = jStat4.arange(
               rcSlice.row.start,
               Math2.min(A[0].length, rcSlice.row.end),
               rcSlice.row.step
@@ -26466,12 +26466,12 @@ var require_jstat = __commonJS({
           rcSlice.col.start = rcSlice.col.start || 0;
           rcSlice.col.end = rcSlice.col.end || A[0].length;
           rcSlice.col.step = rcSlice.col.step || 1;
-          ml = jStat3.arange(
+          ml = jStat4.arange(
             rcSlice.row.start,
             Math2.min(A.length, rcSlice.row.end),
             rcSlice.row.step
           );
-          nl = jStat3.arange(
+          nl = jStat4.arange(
             rcSlice.col.start,
             Math2.min(A[0].length, rcSlice.col.end),
             rcSlice.col.step
@@ -26483,14 +26483,14 @@ var require_jstat = __commonJS({
           });
           return A;
         };
-        jStat3.diagonal = function diagonal(diagArray) {
-          var mat = jStat3.zeros(diagArray.length, diagArray.length);
+        jStat4.diagonal = function diagonal(diagArray) {
+          var mat = jStat4.zeros(diagArray.length, diagArray.length);
           diagArray.forEach(function(t, i2) {
             mat[i2][i2] = t;
           });
           return mat;
         };
-        jStat3.copy = function copy(A) {
+        jStat4.copy = function copy(A) {
           return A.map(function(row) {
             if (isNumber(row))
               return row;
@@ -26499,7 +26499,7 @@ var require_jstat = __commonJS({
             });
           });
         };
-        var jProto = jStat3.prototype;
+        var jProto = jStat4.prototype;
         jProto.length = 0;
         jProto.push = Array.prototype.push;
         jProto.sort = Array.prototype.sort;
@@ -26509,13 +26509,13 @@ var require_jstat = __commonJS({
           return this.length > 1 ? slice.call(this) : slice.call(this)[0];
         };
         jProto.map = function map(func, toAlter) {
-          return jStat3(jStat3.map(this, func, toAlter));
+          return jStat4(jStat4.map(this, func, toAlter));
         };
         jProto.cumreduce = function cumreduce(func, toAlter) {
-          return jStat3(jStat3.cumreduce(this, func, toAlter));
+          return jStat4(jStat4.cumreduce(this, func, toAlter));
         };
         jProto.alter = function alter(func) {
-          jStat3.alter(this, func);
+          jStat4.alter(this, func);
           return this;
         };
         (function(funcs) {
@@ -26528,8 +26528,8 @@ var require_jstat = __commonJS({
                 });
                 return this;
               }
-              results = jStat3[passfunc](this);
-              return isArray(results) ? jStat3(results) : results;
+              results = jStat4[passfunc](this);
+              return isArray(results) ? jStat4(results) : results;
             };
           })(funcs[i2]);
         })("transpose clear symmetric rows cols dimensions diag antidiag".split(" "));
@@ -26543,43 +26543,43 @@ var require_jstat = __commonJS({
                 });
                 return this;
               }
-              return jStat3(jStat3[passfunc](this, index));
+              return jStat4(jStat4[passfunc](this, index));
             };
           })(funcs[i2]);
         })("row col".split(" "));
         (function(funcs) {
           for (var i2 = 0; i2 < funcs.length; i2++) (function(passfunc) {
             jProto[passfunc] = function() {
-              return jStat3(jStat3[passfunc].apply(null, arguments));
+              return jStat4(jStat4[passfunc].apply(null, arguments));
             };
           })(funcs[i2]);
         })("create zeros ones rand identity".split(" "));
-        return jStat3;
+        return jStat4;
       })(Math);
-      (function(jStat3, Math2) {
-        var isFunction = jStat3.utils.isFunction;
+      (function(jStat4, Math2) {
+        var isFunction = jStat4.utils.isFunction;
         function ascNum(a, b) {
           return a - b;
         }
         function clip2(arg, min, max2) {
           return Math2.max(min, Math2.min(arg, max2));
         }
-        jStat3.sum = function sum(arr) {
+        jStat4.sum = function sum(arr) {
           var sum2 = 0;
           var i2 = arr.length;
           while (--i2 >= 0)
             sum2 += arr[i2];
           return sum2;
         };
-        jStat3.sumsqrd = function sumsqrd(arr) {
+        jStat4.sumsqrd = function sumsqrd(arr) {
           var sum = 0;
           var i2 = arr.length;
           while (--i2 >= 0)
             sum += arr[i2] * arr[i2];
           return sum;
         };
-        jStat3.sumsqerr = function sumsqerr(arr) {
-          var mean2 = jStat3.mean(arr);
+        jStat4.sumsqerr = function sumsqerr(arr) {
+          var mean2 = jStat4.mean(arr);
           var sum = 0;
           var i2 = arr.length;
           var tmp;
@@ -26589,21 +26589,21 @@ var require_jstat = __commonJS({
           }
           return sum;
         };
-        jStat3.sumrow = function sumrow(arr) {
+        jStat4.sumrow = function sumrow(arr) {
           var sum = 0;
           var i2 = arr.length;
           while (--i2 >= 0)
             sum += arr[i2];
           return sum;
         };
-        jStat3.product = function product(arr) {
+        jStat4.product = function product(arr) {
           var prod = 1;
           var i2 = arr.length;
           while (--i2 >= 0)
             prod *= arr[i2];
           return prod;
         };
-        jStat3.min = function min(arr) {
+        jStat4.min = function min(arr) {
           var low = arr[0];
           var i2 = 0;
           while (++i2 < arr.length)
@@ -26611,7 +26611,7 @@ var require_jstat = __commonJS({
               low = arr[i2];
           return low;
         };
-        jStat3.max = function max2(arr) {
+        jStat4.max = function max2(arr) {
           var high = arr[0];
           var i2 = 0;
           while (++i2 < arr.length)
@@ -26619,7 +26619,7 @@ var require_jstat = __commonJS({
               high = arr[i2];
           return high;
         };
-        jStat3.unique = function unique(arr) {
+        jStat4.unique = function unique(arr) {
           var hash = {}, _arr = [];
           for (var i2 = 0; i2 < arr.length; i2++) {
             if (!hash[arr[i2]]) {
@@ -26629,33 +26629,33 @@ var require_jstat = __commonJS({
           }
           return _arr;
         };
-        jStat3.mean = function mean2(arr) {
-          return jStat3.sum(arr) / arr.length;
+        jStat4.mean = function mean2(arr) {
+          return jStat4.sum(arr) / arr.length;
         };
-        jStat3.meansqerr = function meansqerr(arr) {
-          return jStat3.sumsqerr(arr) / arr.length;
+        jStat4.meansqerr = function meansqerr(arr) {
+          return jStat4.sumsqerr(arr) / arr.length;
         };
-        jStat3.geomean = function geomean(arr) {
+        jStat4.geomean = function geomean(arr) {
           var logs = arr.map(Math2.log);
-          var meanOfLogs = jStat3.mean(logs);
+          var meanOfLogs = jStat4.mean(logs);
           return Math2.exp(meanOfLogs);
         };
-        jStat3.median = function median(arr) {
+        jStat4.median = function median(arr) {
           var arrlen = arr.length;
           var _arr = arr.slice().sort(ascNum);
           return !(arrlen & 1) ? (_arr[arrlen / 2 - 1] + _arr[arrlen / 2]) / 2 : _arr[arrlen / 2 | 0];
         };
-        jStat3.cumsum = function cumsum(arr) {
-          return jStat3.cumreduce(arr, function(a, b) {
+        jStat4.cumsum = function cumsum(arr) {
+          return jStat4.cumreduce(arr, function(a, b) {
             return a + b;
           });
         };
-        jStat3.cumprod = function cumprod(arr) {
-          return jStat3.cumreduce(arr, function(a, b) {
+        jStat4.cumprod = function cumprod(arr) {
+          return jStat4.cumreduce(arr, function(a, b) {
             return a * b;
           });
         };
-        jStat3.diff = function diff(arr) {
+        jStat4.diff = function diff(arr) {
           var diffs = [];
           var arrLen = arr.length;
           var i2;
@@ -26663,7 +26663,7 @@ var require_jstat = __commonJS({
             diffs.push(arr[i2] - arr[i2 - 1]);
           return diffs;
         };
-        jStat3.rank = function(arr) {
+        jStat4.rank = function(arr) {
           var i2;
           var distinctNumbers = [];
           var numberCounts = {};
@@ -26692,7 +26692,7 @@ var require_jstat = __commonJS({
             return numberRanks[number2];
           });
         };
-        jStat3.mode = function mode(arr) {
+        jStat4.mode = function mode(arr) {
           var arrLen = arr.length;
           var _arr = arr.slice().sort(ascNum);
           var count2 = 1;
@@ -26717,23 +26717,23 @@ var require_jstat = __commonJS({
           }
           return numMaxCount === 0 ? mode_arr[0] : mode_arr;
         };
-        jStat3.range = function range(arr) {
-          return jStat3.max(arr) - jStat3.min(arr);
+        jStat4.range = function range(arr) {
+          return jStat4.max(arr) - jStat4.min(arr);
         };
-        jStat3.variance = function variance(arr, flag) {
-          return jStat3.sumsqerr(arr) / (arr.length - (flag ? 1 : 0));
+        jStat4.variance = function variance(arr, flag) {
+          return jStat4.sumsqerr(arr) / (arr.length - (flag ? 1 : 0));
         };
-        jStat3.pooledvariance = function pooledvariance(arr) {
+        jStat4.pooledvariance = function pooledvariance(arr) {
           var sumsqerr = arr.reduce(function(a, samples) {
-            return a + jStat3.sumsqerr(samples);
+            return a + jStat4.sumsqerr(samples);
           }, 0);
           var count2 = arr.reduce(function(a, samples) {
             return a + samples.length;
           }, 0);
           return sumsqerr / (count2 - arr.length);
         };
-        jStat3.deviation = function(arr) {
-          var mean2 = jStat3.mean(arr);
+        jStat4.deviation = function(arr) {
+          var mean2 = jStat4.mean(arr);
           var arrlen = arr.length;
           var dev = new Array(arrlen);
           for (var i2 = 0; i2 < arrlen; i2++) {
@@ -26741,32 +26741,32 @@ var require_jstat = __commonJS({
           }
           return dev;
         };
-        jStat3.stdev = function stdev(arr, flag) {
-          return Math2.sqrt(jStat3.variance(arr, flag));
+        jStat4.stdev = function stdev(arr, flag) {
+          return Math2.sqrt(jStat4.variance(arr, flag));
         };
-        jStat3.pooledstdev = function pooledstdev(arr) {
-          return Math2.sqrt(jStat3.pooledvariance(arr));
+        jStat4.pooledstdev = function pooledstdev(arr) {
+          return Math2.sqrt(jStat4.pooledvariance(arr));
         };
-        jStat3.meandev = function meandev(arr) {
-          var mean2 = jStat3.mean(arr);
+        jStat4.meandev = function meandev(arr) {
+          var mean2 = jStat4.mean(arr);
           var a = [];
           for (var i2 = arr.length - 1; i2 >= 0; i2--) {
             a.push(Math2.abs(arr[i2] - mean2));
           }
-          return jStat3.mean(a);
+          return jStat4.mean(a);
         };
-        jStat3.meddev = function meddev(arr) {
-          var median = jStat3.median(arr);
+        jStat4.meddev = function meddev(arr) {
+          var median = jStat4.median(arr);
           var a = [];
           for (var i2 = arr.length - 1; i2 >= 0; i2--) {
             a.push(Math2.abs(arr[i2] - median));
           }
-          return jStat3.median(a);
+          return jStat4.median(a);
         };
-        jStat3.coeffvar = function coeffvar(arr) {
-          return jStat3.stdev(arr) / jStat3.mean(arr);
+        jStat4.coeffvar = function coeffvar(arr) {
+          return jStat4.stdev(arr) / jStat4.mean(arr);
         };
-        jStat3.quartiles = function quartiles(arr) {
+        jStat4.quartiles = function quartiles(arr) {
           var arrlen = arr.length;
           var _arr = arr.slice().sort(ascNum);
           return [
@@ -26775,7 +26775,7 @@ var require_jstat = __commonJS({
             _arr[Math2.round(arrlen * 3 / 4) - 1]
           ];
         };
-        jStat3.quantiles = function quantiles(arr, quantilesArray, alphap, betap) {
+        jStat4.quantiles = function quantiles(arr, quantilesArray, alphap, betap) {
           var sortedArray = arr.slice().sort(ascNum);
           var quantileVals = [quantilesArray.length];
           var n = arr.length;
@@ -26794,7 +26794,7 @@ var require_jstat = __commonJS({
           }
           return quantileVals;
         };
-        jStat3.percentile = function percentile(arr, k, exclusive) {
+        jStat4.percentile = function percentile(arr, k, exclusive) {
           var _arr = arr.slice().sort(ascNum);
           var realIndex = k * (_arr.length + (exclusive ? 1 : -1)) + (exclusive ? 0 : 1);
           var index = parseInt(realIndex);
@@ -26805,25 +26805,25 @@ var require_jstat = __commonJS({
             return _arr[index - 1];
           }
         };
-        jStat3.percentileOfScore = function percentileOfScore(arr, score, kind) {
+        jStat4.percentileOfScore = function percentileOfScore(arr, score, kind) {
           var counter = 0;
           var len = arr.length;
           var strict = false;
-          var value, i2;
+          var value2, i2;
           if (kind === "strict")
             strict = true;
           for (i2 = 0; i2 < len; i2++) {
-            value = arr[i2];
-            if (strict && value < score || !strict && value <= score) {
+            value2 = arr[i2];
+            if (strict && value2 < score || !strict && value2 <= score) {
               counter++;
             }
           }
           return counter / len;
         };
-        jStat3.histogram = function histogram(arr, binCnt) {
+        jStat4.histogram = function histogram(arr, binCnt) {
           binCnt = binCnt || 4;
-          var first = jStat3.min(arr);
-          var binWidth = (jStat3.max(arr) - first) / binCnt;
+          var first = jStat4.min(arr);
+          var binWidth = (jStat4.max(arr) - first) / binCnt;
           var len = arr.length;
           var bins = [];
           var i2;
@@ -26833,40 +26833,40 @@ var require_jstat = __commonJS({
             bins[Math2.min(Math2.floor((arr[i2] - first) / binWidth), binCnt - 1)] += 1;
           return bins;
         };
-        jStat3.covariance = function covariance(arr1, arr2) {
-          var u = jStat3.mean(arr1);
-          var v = jStat3.mean(arr2);
+        jStat4.covariance = function covariance(arr1, arr2) {
+          var u = jStat4.mean(arr1);
+          var v = jStat4.mean(arr2);
           var arr1Len = arr1.length;
           var sq_dev = new Array(arr1Len);
           var i2;
           for (i2 = 0; i2 < arr1Len; i2++)
             sq_dev[i2] = (arr1[i2] - u) * (arr2[i2] - v);
-          return jStat3.sum(sq_dev) / (arr1Len - 1);
+          return jStat4.sum(sq_dev) / (arr1Len - 1);
         };
-        jStat3.corrcoeff = function corrcoeff(arr1, arr2) {
-          return jStat3.covariance(arr1, arr2) / jStat3.stdev(arr1, 1) / jStat3.stdev(arr2, 1);
+        jStat4.corrcoeff = function corrcoeff(arr1, arr2) {
+          return jStat4.covariance(arr1, arr2) / jStat4.stdev(arr1, 1) / jStat4.stdev(arr2, 1);
         };
-        jStat3.spearmancoeff = function(arr1, arr2) {
-          arr1 = jStat3.rank(arr1);
-          arr2 = jStat3.rank(arr2);
-          return jStat3.corrcoeff(arr1, arr2);
+        jStat4.spearmancoeff = function(arr1, arr2) {
+          arr1 = jStat4.rank(arr1);
+          arr2 = jStat4.rank(arr2);
+          return jStat4.corrcoeff(arr1, arr2);
         };
-        jStat3.stanMoment = function stanMoment(arr, n) {
-          var mu = jStat3.mean(arr);
-          var sigma = jStat3.stdev(arr);
+        jStat4.stanMoment = function stanMoment(arr, n) {
+          var mu = jStat4.mean(arr);
+          var sigma = jStat4.stdev(arr);
           var len = arr.length;
           var skewSum = 0;
           for (var i2 = 0; i2 < len; i2++)
             skewSum += Math2.pow((arr[i2] - mu) / sigma, n);
           return skewSum / arr.length;
         };
-        jStat3.skewness = function skewness(arr) {
-          return jStat3.stanMoment(arr, 3);
+        jStat4.skewness = function skewness(arr) {
+          return jStat4.stanMoment(arr, 3);
         };
-        jStat3.kurtosis = function kurtosis(arr) {
-          return jStat3.stanMoment(arr, 4) - 3;
+        jStat4.kurtosis = function kurtosis(arr) {
+          return jStat4.stanMoment(arr, 4) - 3;
         };
-        var jProto = jStat3.prototype;
+        var jProto = jStat4.prototype;
         (function(funcs) {
           for (var i2 = 0; i2 < funcs.length; i2++) (function(passfunc) {
             jProto[passfunc] = function(fullbool, func) {
@@ -26886,10 +26886,10 @@ var require_jstat = __commonJS({
               if (this.length > 1) {
                 tmpthis = fullbool === true ? this : this.transpose();
                 for (; i3 < tmpthis.length; i3++)
-                  arr[i3] = jStat3[passfunc](tmpthis[i3]);
+                  arr[i3] = jStat4[passfunc](tmpthis[i3]);
                 return arr;
               }
-              return jStat3[passfunc](this[0], fullbool);
+              return jStat4[passfunc](this[0], fullbool);
             };
           })(funcs[i2]);
         })("cumsum cumprod".split(" "));
@@ -26913,10 +26913,10 @@ var require_jstat = __commonJS({
                 if (passfunc !== "sumrow")
                   tmpthis = fullbool === true ? this : this.transpose();
                 for (; i3 < tmpthis.length; i3++)
-                  arr[i3] = jStat3[passfunc](tmpthis[i3]);
-                return fullbool === true ? jStat3[passfunc](jStat3.utils.toVector(arr)) : arr;
+                  arr[i3] = jStat4[passfunc](tmpthis[i3]);
+                return fullbool === true ? jStat4[passfunc](jStat4.utils.toVector(arr)) : arr;
               }
-              return jStat3[passfunc](this[0], fullbool);
+              return jStat4[passfunc](this[0], fullbool);
             };
           })(funcs[i2]);
         })("sum sumsqrd sumsqerr sumrow product min max unique mean meansqerr geomean median diff rank mode range variance deviation stdev meandev meddev coeffvar quartiles histogram skewness kurtosis".split(" "));
@@ -26941,7 +26941,7 @@ var require_jstat = __commonJS({
               } else {
                 callbackFunction = void 0;
                 var curriedFunction = function curriedFunction2(vector) {
-                  return jStat3[passfunc].apply(tmpthis, [vector].concat(args));
+                  return jStat4[passfunc].apply(tmpthis, [vector].concat(args));
                 };
               }
               if (this.length > 1) {
@@ -26954,9 +26954,9 @@ var require_jstat = __commonJS({
             };
           })(funcs[i2]);
         })("quantiles percentileOfScore".split(" "));
-      })(jStat2, Math);
-      (function(jStat3, Math2) {
-        jStat3.gammaln = function gammaln(x2) {
+      })(jStat3, Math);
+      (function(jStat4, Math2) {
+        jStat4.gammaln = function gammaln(x2) {
           var j = 0;
           var cof = [
             76.18009172947146,
@@ -26974,7 +26974,7 @@ var require_jstat = __commonJS({
             ser += cof[j] / ++y;
           return Math2.log(2.5066282746310007 * ser / xx) - tmp;
         };
-        jStat3.loggam = function loggam(x2) {
+        jStat4.loggam = function loggam(x2) {
           var x0, x22, xp, gl, gl0;
           var k, n;
           var a = [
@@ -27014,7 +27014,7 @@ var require_jstat = __commonJS({
           }
           return gl;
         };
-        jStat3.gammafn = function gammafn(x2) {
+        jStat4.gammafn = function gammafn(x2) {
           var p = [
             -1.716185138865495,
             24.76565080557592,
@@ -27077,11 +27077,11 @@ var require_jstat = __commonJS({
           }
           return res;
         };
-        jStat3.gammap = function gammap(a, x2) {
-          return jStat3.lowRegGamma(a, x2) * jStat3.gammafn(a);
+        jStat4.gammap = function gammap(a, x2) {
+          return jStat4.lowRegGamma(a, x2) * jStat4.gammafn(a);
         };
-        jStat3.lowRegGamma = function lowRegGamma(a, x2) {
-          var aln = jStat3.gammaln(a);
+        jStat4.lowRegGamma = function lowRegGamma(a, x2) {
+          var aln = jStat4.gammaln(a);
           var ap = a;
           var sum = 1 / a;
           var del = sum;
@@ -27110,30 +27110,30 @@ var require_jstat = __commonJS({
           }
           return 1 - h * Math2.exp(-x2 + a * Math2.log(x2) - aln);
         };
-        jStat3.factorialln = function factorialln(n) {
-          return n < 0 ? NaN : jStat3.gammaln(n + 1);
+        jStat4.factorialln = function factorialln(n) {
+          return n < 0 ? NaN : jStat4.gammaln(n + 1);
         };
-        jStat3.factorial = function factorial(n) {
-          return n < 0 ? NaN : jStat3.gammafn(n + 1);
+        jStat4.factorial = function factorial(n) {
+          return n < 0 ? NaN : jStat4.gammafn(n + 1);
         };
-        jStat3.combination = function combination(n, m) {
-          return n > 170 || m > 170 ? Math2.exp(jStat3.combinationln(n, m)) : jStat3.factorial(n) / jStat3.factorial(m) / jStat3.factorial(n - m);
+        jStat4.combination = function combination(n, m) {
+          return n > 170 || m > 170 ? Math2.exp(jStat4.combinationln(n, m)) : jStat4.factorial(n) / jStat4.factorial(m) / jStat4.factorial(n - m);
         };
-        jStat3.combinationln = function combinationln(n, m) {
-          return jStat3.factorialln(n) - jStat3.factorialln(m) - jStat3.factorialln(n - m);
+        jStat4.combinationln = function combinationln(n, m) {
+          return jStat4.factorialln(n) - jStat4.factorialln(m) - jStat4.factorialln(n - m);
         };
-        jStat3.permutation = function permutation(n, m) {
-          return jStat3.factorial(n) / jStat3.factorial(n - m);
+        jStat4.permutation = function permutation(n, m) {
+          return jStat4.factorial(n) / jStat4.factorial(n - m);
         };
-        jStat3.betafn = function betafn(x2, y) {
+        jStat4.betafn = function betafn(x2, y) {
           if (x2 <= 0 || y <= 0)
             return void 0;
-          return x2 + y > 170 ? Math2.exp(jStat3.betaln(x2, y)) : jStat3.gammafn(x2) * jStat3.gammafn(y) / jStat3.gammafn(x2 + y);
+          return x2 + y > 170 ? Math2.exp(jStat4.betaln(x2, y)) : jStat4.gammafn(x2) * jStat4.gammafn(y) / jStat4.gammafn(x2 + y);
         };
-        jStat3.betaln = function betaln(x2, y) {
-          return jStat3.gammaln(x2) + jStat3.gammaln(y) - jStat3.gammaln(x2 + y);
+        jStat4.betaln = function betaln(x2, y) {
+          return jStat4.gammaln(x2) + jStat4.gammaln(y) - jStat4.gammaln(x2 + y);
         };
-        jStat3.betacf = function betacf(x2, a, b) {
+        jStat4.betacf = function betacf(x2, a, b) {
           var fpmin = 1e-30;
           var m = 1;
           var qab = a + b;
@@ -27172,11 +27172,11 @@ var require_jstat = __commonJS({
           }
           return h;
         };
-        jStat3.gammapinv = function gammapinv(p, a) {
+        jStat4.gammapinv = function gammapinv(p, a) {
           var j = 0;
           var a1 = a - 1;
           var EPS = 1e-8;
-          var gln = jStat3.gammaln(a);
+          var gln = jStat4.gammaln(a);
           var x2, err2, t, u, pp, lna1, afac;
           if (p >= 1)
             return Math2.max(100, a + 100 * Math2.sqrt(a));
@@ -27204,7 +27204,7 @@ var require_jstat = __commonJS({
           for (; j < 12; j++) {
             if (x2 <= 0)
               return 0;
-            err2 = jStat3.lowRegGamma(a, x2) - p;
+            err2 = jStat4.lowRegGamma(a, x2) - p;
             if (a > 1)
               t = afac * Math2.exp(-(x2 - a1) + a1 * (Math2.log(x2) - lna1));
             else
@@ -27218,7 +27218,7 @@ var require_jstat = __commonJS({
           }
           return x2;
         };
-        jStat3.erf = function erf(x2) {
+        jStat4.erf = function erf(x2) {
           var cof = [
             -1.3026537197817094,
             0.6419697923564902,
@@ -27268,10 +27268,10 @@ var require_jstat = __commonJS({
           res = t * Math2.exp(-x2 * x2 + 0.5 * (cof[0] + ty * d) - dd);
           return isneg ? res - 1 : 1 - res;
         };
-        jStat3.erfc = function erfc(x2) {
-          return 1 - jStat3.erf(x2);
+        jStat4.erfc = function erfc(x2) {
+          return 1 - jStat4.erf(x2);
         };
-        jStat3.erfcinv = function erfcinv(p) {
+        jStat4.erfcinv = function erfcinv(p) {
           var j = 0;
           var x2, err2, t, pp;
           if (p >= 2)
@@ -27282,12 +27282,12 @@ var require_jstat = __commonJS({
           t = Math2.sqrt(-2 * Math2.log(pp / 2));
           x2 = -0.70711 * ((2.30753 + t * 0.27061) / (1 + t * (0.99229 + t * 0.04481)) - t);
           for (; j < 2; j++) {
-            err2 = jStat3.erfc(x2) - pp;
+            err2 = jStat4.erfc(x2) - pp;
             x2 += err2 / (1.1283791670955126 * Math2.exp(-x2 * x2) - x2 * err2);
           }
           return p < 1 ? x2 : -x2;
         };
-        jStat3.ibetainv = function ibetainv(p, a, b) {
+        jStat4.ibetainv = function ibetainv(p, a, b) {
           var EPS = 1e-8;
           var a1 = a - 1;
           var b1 = b - 1;
@@ -27318,11 +27318,11 @@ var require_jstat = __commonJS({
             else
               x2 = 1 - Math2.pow(b * w * (1 - p), 1 / b);
           }
-          afac = -jStat3.gammaln(a) - jStat3.gammaln(b) + jStat3.gammaln(a + b);
+          afac = -jStat4.gammaln(a) - jStat4.gammaln(b) + jStat4.gammaln(a + b);
           for (; j < 10; j++) {
             if (x2 === 0 || x2 === 1)
               return x2;
-            err2 = jStat3.ibeta(x2, a, b) - p;
+            err2 = jStat4.ibeta(x2, a, b) - p;
             t = Math2.exp(a1 * Math2.log(x2) + b1 * Math2.log(1 - x2) + afac);
             u = err2 / t;
             x2 -= t = u / (1 - 0.5 * Math2.min(1, u * (a1 / x2 - b1 / (1 - x2))));
@@ -27335,32 +27335,32 @@ var require_jstat = __commonJS({
           }
           return x2;
         };
-        jStat3.ibeta = function ibeta2(x2, a, b) {
-          var bt = x2 === 0 || x2 === 1 ? 0 : Math2.exp(jStat3.gammaln(a + b) - jStat3.gammaln(a) - jStat3.gammaln(b) + a * Math2.log(x2) + b * Math2.log(1 - x2));
+        jStat4.ibeta = function ibeta2(x2, a, b) {
+          var bt = x2 === 0 || x2 === 1 ? 0 : Math2.exp(jStat4.gammaln(a + b) - jStat4.gammaln(a) - jStat4.gammaln(b) + a * Math2.log(x2) + b * Math2.log(1 - x2));
           if (x2 < 0 || x2 > 1)
             return false;
           if (x2 < (a + 1) / (a + b + 2))
-            return bt * jStat3.betacf(x2, a, b) / a;
-          return 1 - bt * jStat3.betacf(1 - x2, b, a) / b;
+            return bt * jStat4.betacf(x2, a, b) / a;
+          return 1 - bt * jStat4.betacf(1 - x2, b, a) / b;
         };
-        jStat3.randn = function randn(n, m) {
+        jStat4.randn = function randn(n, m) {
           var u, v, x2, y, q;
           if (!m)
             m = n;
           if (n)
-            return jStat3.create(n, m, function() {
-              return jStat3.randn();
+            return jStat4.create(n, m, function() {
+              return jStat4.randn();
             });
           do {
-            u = jStat3._random_fn();
-            v = 1.7156 * (jStat3._random_fn() - 0.5);
+            u = jStat4._random_fn();
+            v = 1.7156 * (jStat4._random_fn() - 0.5);
             x2 = u - 0.449871;
             y = Math2.abs(v) + 0.386595;
             q = x2 * x2 + y * (0.196 * y - 0.25472 * x2);
           } while (q > 0.27597 && (q > 0.27846 || v * v > -4 * Math2.log(u) * u * u));
           return v / u;
         };
-        jStat3.randg = function randg(shape, n, m) {
+        jStat4.randg = function randg(shape, n, m) {
           var oalph = shape;
           var a1, a2, u, v, x2, mat;
           if (!m)
@@ -27368,9 +27368,9 @@ var require_jstat = __commonJS({
           if (!shape)
             shape = 1;
           if (n) {
-            mat = jStat3.zeros(n, m);
+            mat = jStat4.zeros(n, m);
             mat.alter(function() {
-              return jStat3.randg(shape);
+              return jStat4.randg(shape);
             });
             return mat;
           }
@@ -27380,25 +27380,25 @@ var require_jstat = __commonJS({
           a2 = 1 / Math2.sqrt(9 * a1);
           do {
             do {
-              x2 = jStat3.randn();
+              x2 = jStat4.randn();
               v = 1 + a2 * x2;
             } while (v <= 0);
             v = v * v * v;
-            u = jStat3._random_fn();
+            u = jStat4._random_fn();
           } while (u > 1 - 0.331 * Math2.pow(x2, 4) && Math2.log(u) > 0.5 * x2 * x2 + a1 * (1 - v + Math2.log(v)));
           if (shape == oalph)
             return a1 * v;
           do {
-            u = jStat3._random_fn();
+            u = jStat4._random_fn();
           } while (u === 0);
           return Math2.pow(u, 1 / oalph) * a1 * v;
         };
         (function(funcs) {
           for (var i2 = 0; i2 < funcs.length; i2++) (function(passfunc) {
-            jStat3.fn[passfunc] = function() {
-              return jStat3(
-                jStat3.map(this, function(value) {
-                  return jStat3[passfunc](value);
+            jStat4.fn[passfunc] = function() {
+              return jStat4(
+                jStat4.map(this, function(value2) {
+                  return jStat4[passfunc](value2);
                 })
               );
             };
@@ -27406,16 +27406,16 @@ var require_jstat = __commonJS({
         })("gammaln gammafn factorial factorialln".split(" "));
         (function(funcs) {
           for (var i2 = 0; i2 < funcs.length; i2++) (function(passfunc) {
-            jStat3.fn[passfunc] = function() {
-              return jStat3(jStat3[passfunc].apply(null, arguments));
+            jStat4.fn[passfunc] = function() {
+              return jStat4(jStat4[passfunc].apply(null, arguments));
             };
           })(funcs[i2]);
         })("randn".split(" "));
-      })(jStat2, Math);
-      (function(jStat3, Math2) {
+      })(jStat3, Math);
+      (function(jStat4, Math2) {
         (function(list) {
           for (var i2 = 0; i2 < list.length; i2++) (function(func) {
-            jStat3[func] = function f(a, b, c) {
+            jStat4[func] = function f(a, b, c) {
               if (!(this instanceof f))
                 return new f(a, b, c);
               this._a = a;
@@ -27423,85 +27423,85 @@ var require_jstat = __commonJS({
               this._c = c;
               return this;
             };
-            jStat3.fn[func] = function(a, b, c) {
-              var newthis = jStat3[func](a, b, c);
+            jStat4.fn[func] = function(a, b, c) {
+              var newthis = jStat4[func](a, b, c);
               newthis.data = this;
               return newthis;
             };
-            jStat3[func].prototype.sample = function(arr) {
+            jStat4[func].prototype.sample = function(arr) {
               var a = this._a;
               var b = this._b;
               var c = this._c;
               if (arr)
-                return jStat3.alter(arr, function() {
-                  return jStat3[func].sample(a, b, c);
+                return jStat4.alter(arr, function() {
+                  return jStat4[func].sample(a, b, c);
                 });
               else
-                return jStat3[func].sample(a, b, c);
+                return jStat4[func].sample(a, b, c);
             };
             (function(vals) {
               for (var i3 = 0; i3 < vals.length; i3++) (function(fnfunc) {
-                jStat3[func].prototype[fnfunc] = function(x2) {
+                jStat4[func].prototype[fnfunc] = function(x2) {
                   var a = this._a;
                   var b = this._b;
                   var c = this._c;
                   if (!x2 && x2 !== 0)
                     x2 = this.data;
                   if (typeof x2 !== "number") {
-                    return jStat3.fn.map.call(x2, function(x3) {
-                      return jStat3[func][fnfunc](x3, a, b, c);
+                    return jStat4.fn.map.call(x2, function(x3) {
+                      return jStat4[func][fnfunc](x3, a, b, c);
                     });
                   }
-                  return jStat3[func][fnfunc](x2, a, b, c);
+                  return jStat4[func][fnfunc](x2, a, b, c);
                 };
               })(vals[i3]);
             })("pdf cdf inv".split(" "));
             (function(vals) {
               for (var i3 = 0; i3 < vals.length; i3++) (function(fnfunc) {
-                jStat3[func].prototype[fnfunc] = function() {
-                  return jStat3[func][fnfunc](this._a, this._b, this._c);
+                jStat4[func].prototype[fnfunc] = function() {
+                  return jStat4[func][fnfunc](this._a, this._b, this._c);
                 };
               })(vals[i3]);
             })("mean median mode variance".split(" "));
           })(list[i2]);
         })("beta centralF cauchy chisquare exponential gamma invgamma kumaraswamy laplace lognormal noncentralt normal pareto studentt weibull uniform binomial negbin hypgeom poisson triangular tukey arcsine".split(" "));
-        jStat3.extend(jStat3.beta, {
+        jStat4.extend(jStat4.beta, {
           pdf: function pdf(x2, alpha, beta) {
             if (x2 > 1 || x2 < 0)
               return 0;
             if (alpha == 1 && beta == 1)
               return 1;
             if (alpha < 512 && beta < 512) {
-              return Math2.pow(x2, alpha - 1) * Math2.pow(1 - x2, beta - 1) / jStat3.betafn(alpha, beta);
+              return Math2.pow(x2, alpha - 1) * Math2.pow(1 - x2, beta - 1) / jStat4.betafn(alpha, beta);
             } else {
-              return Math2.exp((alpha - 1) * Math2.log(x2) + (beta - 1) * Math2.log(1 - x2) - jStat3.betaln(alpha, beta));
+              return Math2.exp((alpha - 1) * Math2.log(x2) + (beta - 1) * Math2.log(1 - x2) - jStat4.betaln(alpha, beta));
             }
           },
           cdf: function cdf(x2, alpha, beta) {
-            return x2 > 1 || x2 < 0 ? (x2 > 1) * 1 : jStat3.ibeta(x2, alpha, beta);
+            return x2 > 1 || x2 < 0 ? (x2 > 1) * 1 : jStat4.ibeta(x2, alpha, beta);
           },
           inv: function inv(x2, alpha, beta) {
-            return jStat3.ibetainv(x2, alpha, beta);
+            return jStat4.ibetainv(x2, alpha, beta);
           },
           mean: function mean2(alpha, beta) {
             return alpha / (alpha + beta);
           },
           median: function median(alpha, beta) {
-            return jStat3.ibetainv(0.5, alpha, beta);
+            return jStat4.ibetainv(0.5, alpha, beta);
           },
           mode: function mode(alpha, beta) {
             return (alpha - 1) / (alpha + beta - 2);
           },
           // return a random sample
           sample: function sample(alpha, beta) {
-            var u = jStat3.randg(alpha);
-            return u / (u + jStat3.randg(beta));
+            var u = jStat4.randg(alpha);
+            return u / (u + jStat4.randg(beta));
           },
           variance: function variance(alpha, beta) {
             return alpha * beta / (Math2.pow(alpha + beta, 2) * (alpha + beta + 1));
           }
         });
-        jStat3.extend(jStat3.centralF, {
+        jStat4.extend(jStat4.centralF, {
           // This implementation of the pdf function avoids float overflow
           // See the way that R calculates this value:
           // https://svn.r-project.org/R/trunk/src/nmath/df.c
@@ -27516,20 +27516,20 @@ var require_jstat = __commonJS({
               if (x2 === 0 && df1 === 2) {
                 return 1;
               }
-              return 1 / jStat3.betafn(df1 / 2, df2 / 2) * Math2.pow(df1 / df2, df1 / 2) * Math2.pow(x2, df1 / 2 - 1) * Math2.pow(1 + df1 / df2 * x2, -(df1 + df2) / 2);
+              return 1 / jStat4.betafn(df1 / 2, df2 / 2) * Math2.pow(df1 / df2, df1 / 2) * Math2.pow(x2, df1 / 2 - 1) * Math2.pow(1 + df1 / df2 * x2, -(df1 + df2) / 2);
             }
             p = df1 * x2 / (df2 + x2 * df1);
             q = df2 / (df2 + x2 * df1);
             f = df1 * q / 2;
-            return f * jStat3.binomial.pdf((df1 - 2) / 2, (df1 + df2 - 2) / 2, p);
+            return f * jStat4.binomial.pdf((df1 - 2) / 2, (df1 + df2 - 2) / 2, p);
           },
           cdf: function cdf(x2, df1, df2) {
             if (x2 < 0)
               return 0;
-            return jStat3.ibeta(df1 * x2 / (df1 * x2 + df2), df1 / 2, df2 / 2);
+            return jStat4.ibeta(df1 * x2 / (df1 * x2 + df2), df1 / 2, df2 / 2);
           },
           inv: function inv(x2, df1, df2) {
-            return df2 / (df1 * (1 / jStat3.ibetainv(x2, df1 / 2, df2 / 2) - 1));
+            return df2 / (df1 * (1 / jStat4.ibetainv(x2, df1 / 2, df2 / 2) - 1));
           },
           mean: function mean2(df1, df2) {
             return df2 > 2 ? df2 / (df2 - 2) : void 0;
@@ -27539,8 +27539,8 @@ var require_jstat = __commonJS({
           },
           // return a random sample
           sample: function sample(df1, df2) {
-            var x1 = jStat3.randg(df1 / 2) * 2;
-            var x2 = jStat3.randg(df2 / 2) * 2;
+            var x1 = jStat4.randg(df1 / 2) * 2;
+            var x2 = jStat4.randg(df2 / 2) * 2;
             return x1 / df1 / (x2 / df2);
           },
           variance: function variance(df1, df2) {
@@ -27549,7 +27549,7 @@ var require_jstat = __commonJS({
             return 2 * df2 * df2 * (df1 + df2 - 2) / (df1 * (df2 - 2) * (df2 - 2) * (df2 - 4));
           }
         });
-        jStat3.extend(jStat3.cauchy, {
+        jStat4.extend(jStat4.cauchy, {
           pdf: function pdf(x2, local, scale) {
             if (scale < 0) {
               return 0;
@@ -27569,22 +27569,22 @@ var require_jstat = __commonJS({
             return local;
           },
           sample: function sample(local, scale) {
-            return jStat3.randn() * Math2.sqrt(1 / (2 * jStat3.randg(0.5))) * scale + local;
+            return jStat4.randn() * Math2.sqrt(1 / (2 * jStat4.randg(0.5))) * scale + local;
           }
         });
-        jStat3.extend(jStat3.chisquare, {
+        jStat4.extend(jStat4.chisquare, {
           pdf: function pdf(x2, dof) {
             if (x2 < 0)
               return 0;
-            return x2 === 0 && dof === 2 ? 0.5 : Math2.exp((dof / 2 - 1) * Math2.log(x2) - x2 / 2 - dof / 2 * Math2.log(2) - jStat3.gammaln(dof / 2));
+            return x2 === 0 && dof === 2 ? 0.5 : Math2.exp((dof / 2 - 1) * Math2.log(x2) - x2 / 2 - dof / 2 * Math2.log(2) - jStat4.gammaln(dof / 2));
           },
           cdf: function cdf(x2, dof) {
             if (x2 < 0)
               return 0;
-            return jStat3.lowRegGamma(dof / 2, x2 / 2);
+            return jStat4.lowRegGamma(dof / 2, x2 / 2);
           },
           inv: function(p, dof) {
-            return 2 * jStat3.gammapinv(p, 0.5 * dof);
+            return 2 * jStat4.gammapinv(p, 0.5 * dof);
           },
           mean: function(dof) {
             return dof;
@@ -27597,13 +27597,13 @@ var require_jstat = __commonJS({
             return dof - 2 > 0 ? dof - 2 : 0;
           },
           sample: function sample(dof) {
-            return jStat3.randg(dof / 2) * 2;
+            return jStat4.randg(dof / 2) * 2;
           },
           variance: function variance(dof) {
             return 2 * dof;
           }
         });
-        jStat3.extend(jStat3.exponential, {
+        jStat4.extend(jStat4.exponential, {
           pdf: function pdf(x2, rate) {
             return x2 < 0 ? 0 : rate * Math2.exp(-rate * x2);
           },
@@ -27623,25 +27623,25 @@ var require_jstat = __commonJS({
             return 0;
           },
           sample: function sample(rate) {
-            return -1 / rate * Math2.log(jStat3._random_fn());
+            return -1 / rate * Math2.log(jStat4._random_fn());
           },
           variance: function(rate) {
             return Math2.pow(rate, -2);
           }
         });
-        jStat3.extend(jStat3.gamma, {
+        jStat4.extend(jStat4.gamma, {
           pdf: function pdf(x2, shape, scale) {
             if (x2 < 0)
               return 0;
-            return x2 === 0 && shape === 1 ? 1 / scale : Math2.exp((shape - 1) * Math2.log(x2) - x2 / scale - jStat3.gammaln(shape) - shape * Math2.log(scale));
+            return x2 === 0 && shape === 1 ? 1 / scale : Math2.exp((shape - 1) * Math2.log(x2) - x2 / scale - jStat4.gammaln(shape) - shape * Math2.log(scale));
           },
           cdf: function cdf(x2, shape, scale) {
             if (x2 < 0)
               return 0;
-            return jStat3.lowRegGamma(shape, x2 / scale);
+            return jStat4.lowRegGamma(shape, x2 / scale);
           },
           inv: function(p, shape, scale) {
-            return jStat3.gammapinv(p, shape) * scale;
+            return jStat4.gammapinv(p, shape) * scale;
           },
           mean: function(shape, scale) {
             return shape * scale;
@@ -27651,25 +27651,25 @@ var require_jstat = __commonJS({
             return void 0;
           },
           sample: function sample(shape, scale) {
-            return jStat3.randg(shape) * scale;
+            return jStat4.randg(shape) * scale;
           },
           variance: function variance(shape, scale) {
             return shape * scale * scale;
           }
         });
-        jStat3.extend(jStat3.invgamma, {
+        jStat4.extend(jStat4.invgamma, {
           pdf: function pdf(x2, shape, scale) {
             if (x2 <= 0)
               return 0;
-            return Math2.exp(-(shape + 1) * Math2.log(x2) - scale / x2 - jStat3.gammaln(shape) + shape * Math2.log(scale));
+            return Math2.exp(-(shape + 1) * Math2.log(x2) - scale / x2 - jStat4.gammaln(shape) + shape * Math2.log(scale));
           },
           cdf: function cdf(x2, shape, scale) {
             if (x2 <= 0)
               return 0;
-            return 1 - jStat3.lowRegGamma(shape, scale / x2);
+            return 1 - jStat4.lowRegGamma(shape, scale / x2);
           },
           inv: function(p, shape, scale) {
-            return scale / jStat3.gammapinv(1 - p, shape);
+            return scale / jStat4.gammapinv(1 - p, shape);
           },
           mean: function(shape, scale) {
             return shape > 1 ? scale / (shape - 1) : void 0;
@@ -27678,7 +27678,7 @@ var require_jstat = __commonJS({
             return scale / (shape + 1);
           },
           sample: function sample(shape, scale) {
-            return scale / jStat3.randg(shape);
+            return scale / jStat4.randg(shape);
           },
           variance: function variance(shape, scale) {
             if (shape <= 2)
@@ -27686,7 +27686,7 @@ var require_jstat = __commonJS({
             return scale * scale / ((shape - 1) * (shape - 1) * (shape - 2));
           }
         });
-        jStat3.extend(jStat3.kumaraswamy, {
+        jStat4.extend(jStat4.kumaraswamy, {
           pdf: function pdf(x2, alpha, beta) {
             if (x2 === 0 && alpha === 1)
               return beta;
@@ -27705,7 +27705,7 @@ var require_jstat = __commonJS({
             return Math2.pow(1 - Math2.pow(1 - p, 1 / beta), 1 / alpha);
           },
           mean: function(alpha, beta) {
-            return beta * jStat3.gammafn(1 + 1 / alpha) * jStat3.gammafn(beta) / jStat3.gammafn(1 + 1 / alpha + beta);
+            return beta * jStat4.gammafn(1 + 1 / alpha) * jStat4.gammafn(beta) / jStat4.gammafn(1 + 1 / alpha + beta);
           },
           median: function median(alpha, beta) {
             return Math2.pow(1 - Math2.pow(2, -1 / beta), 1 / alpha);
@@ -27719,7 +27719,7 @@ var require_jstat = __commonJS({
             throw new Error("variance not yet implemented");
           }
         });
-        jStat3.extend(jStat3.lognormal, {
+        jStat4.extend(jStat4.lognormal, {
           pdf: function pdf(x2, mu, sigma) {
             if (x2 <= 0)
               return 0;
@@ -27728,10 +27728,10 @@ var require_jstat = __commonJS({
           cdf: function cdf(x2, mu, sigma) {
             if (x2 < 0)
               return 0;
-            return 0.5 + 0.5 * jStat3.erf((Math2.log(x2) - mu) / Math2.sqrt(2 * sigma * sigma));
+            return 0.5 + 0.5 * jStat4.erf((Math2.log(x2) - mu) / Math2.sqrt(2 * sigma * sigma));
           },
           inv: function(p, mu, sigma) {
-            return Math2.exp(-1.4142135623730951 * sigma * jStat3.erfcinv(2 * p) + mu);
+            return Math2.exp(-1.4142135623730951 * sigma * jStat4.erfcinv(2 * p) + mu);
           },
           mean: function mean2(mu, sigma) {
             return Math2.exp(mu + sigma * sigma / 2);
@@ -27743,61 +27743,61 @@ var require_jstat = __commonJS({
             return Math2.exp(mu - sigma * sigma);
           },
           sample: function sample(mu, sigma) {
-            return Math2.exp(jStat3.randn() * sigma + mu);
+            return Math2.exp(jStat4.randn() * sigma + mu);
           },
           variance: function variance(mu, sigma) {
             return (Math2.exp(sigma * sigma) - 1) * Math2.exp(2 * mu + sigma * sigma);
           }
         });
-        jStat3.extend(jStat3.noncentralt, {
+        jStat4.extend(jStat4.noncentralt, {
           pdf: function pdf(x2, dof, ncp) {
             var tol = 1e-14;
             if (Math2.abs(ncp) < tol)
-              return jStat3.studentt.pdf(x2, dof);
+              return jStat4.studentt.pdf(x2, dof);
             if (Math2.abs(x2) < tol) {
-              return Math2.exp(jStat3.gammaln((dof + 1) / 2) - ncp * ncp / 2 - 0.5 * Math2.log(Math2.PI * dof) - jStat3.gammaln(dof / 2));
+              return Math2.exp(jStat4.gammaln((dof + 1) / 2) - ncp * ncp / 2 - 0.5 * Math2.log(Math2.PI * dof) - jStat4.gammaln(dof / 2));
             }
-            return dof / x2 * (jStat3.noncentralt.cdf(x2 * Math2.sqrt(1 + 2 / dof), dof + 2, ncp) - jStat3.noncentralt.cdf(x2, dof, ncp));
+            return dof / x2 * (jStat4.noncentralt.cdf(x2 * Math2.sqrt(1 + 2 / dof), dof + 2, ncp) - jStat4.noncentralt.cdf(x2, dof, ncp));
           },
           cdf: function cdf(x2, dof, ncp) {
             var tol = 1e-14;
             var min_iterations = 200;
             if (Math2.abs(ncp) < tol)
-              return jStat3.studentt.cdf(x2, dof);
+              return jStat4.studentt.cdf(x2, dof);
             var flip = false;
             if (x2 < 0) {
               flip = true;
               ncp = -ncp;
             }
-            var prob = jStat3.normal.cdf(-ncp, 0, 1);
-            var value = tol + 1;
-            var lastvalue = value;
+            var prob = jStat4.normal.cdf(-ncp, 0, 1);
+            var value2 = tol + 1;
+            var lastvalue = value2;
             var y = x2 * x2 / (x2 * x2 + dof);
             var j = 0;
             var p = Math2.exp(-ncp * ncp / 2);
-            var q = Math2.exp(-ncp * ncp / 2 - 0.5 * Math2.log(2) - jStat3.gammaln(3 / 2)) * ncp;
-            while (j < min_iterations || lastvalue > tol || value > tol) {
-              lastvalue = value;
+            var q = Math2.exp(-ncp * ncp / 2 - 0.5 * Math2.log(2) - jStat4.gammaln(3 / 2)) * ncp;
+            while (j < min_iterations || lastvalue > tol || value2 > tol) {
+              lastvalue = value2;
               if (j > 0) {
                 p *= ncp * ncp / (2 * j);
                 q *= ncp * ncp / (2 * (j + 1 / 2));
               }
-              value = p * jStat3.beta.cdf(y, j + 0.5, dof / 2) + q * jStat3.beta.cdf(y, j + 1, dof / 2);
-              prob += 0.5 * value;
+              value2 = p * jStat4.beta.cdf(y, j + 0.5, dof / 2) + q * jStat4.beta.cdf(y, j + 1, dof / 2);
+              prob += 0.5 * value2;
               j++;
             }
             return flip ? 1 - prob : prob;
           }
         });
-        jStat3.extend(jStat3.normal, {
+        jStat4.extend(jStat4.normal, {
           pdf: function pdf(x2, mean2, std) {
             return Math2.exp(-0.5 * Math2.log(2 * Math2.PI) - Math2.log(std) - Math2.pow(x2 - mean2, 2) / (2 * std * std));
           },
           cdf: function cdf(x2, mean2, std) {
-            return 0.5 * (1 + jStat3.erf((x2 - mean2) / Math2.sqrt(2 * std * std)));
+            return 0.5 * (1 + jStat4.erf((x2 - mean2) / Math2.sqrt(2 * std * std)));
           },
           inv: function(p, mean2, std) {
-            return -1.4142135623730951 * std * jStat3.erfcinv(2 * p) + mean2;
+            return -1.4142135623730951 * std * jStat4.erfcinv(2 * p) + mean2;
           },
           mean: function(mean2) {
             return mean2;
@@ -27809,13 +27809,13 @@ var require_jstat = __commonJS({
             return mean2;
           },
           sample: function sample(mean2, std) {
-            return jStat3.randn() * std + mean2;
+            return jStat4.randn() * std + mean2;
           },
           variance: function(mean2, std) {
             return std * std;
           }
         });
-        jStat3.extend(jStat3.pareto, {
+        jStat4.extend(jStat4.pareto, {
           pdf: function pdf(x2, scale, shape) {
             if (x2 < scale)
               return 0;
@@ -27846,17 +27846,17 @@ var require_jstat = __commonJS({
             return scale * scale * shape / (Math2.pow(shape - 1, 2) * (shape - 2));
           }
         });
-        jStat3.extend(jStat3.studentt, {
+        jStat4.extend(jStat4.studentt, {
           pdf: function pdf(x2, dof) {
             dof = dof > 1e100 ? 1e100 : dof;
-            return 1 / (Math2.sqrt(dof) * jStat3.betafn(0.5, dof / 2)) * Math2.pow(1 + x2 * x2 / dof, -((dof + 1) / 2));
+            return 1 / (Math2.sqrt(dof) * jStat4.betafn(0.5, dof / 2)) * Math2.pow(1 + x2 * x2 / dof, -((dof + 1) / 2));
           },
           cdf: function cdf(x2, dof) {
             var dof2 = dof / 2;
-            return jStat3.ibeta((x2 + Math2.sqrt(x2 * x2 + dof)) / (2 * Math2.sqrt(x2 * x2 + dof)), dof2, dof2);
+            return jStat4.ibeta((x2 + Math2.sqrt(x2 * x2 + dof)) / (2 * Math2.sqrt(x2 * x2 + dof)), dof2, dof2);
           },
           inv: function(p, dof) {
-            var x2 = jStat3.ibetainv(2 * Math2.min(p, 1 - p), 0.5 * dof, 0.5);
+            var x2 = jStat4.ibetainv(2 * Math2.min(p, 1 - p), 0.5 * dof, 0.5);
             x2 = Math2.sqrt(dof * (1 - x2) / x2);
             return p > 0.5 ? x2 : -x2;
           },
@@ -27870,13 +27870,13 @@ var require_jstat = __commonJS({
             return 0;
           },
           sample: function sample(dof) {
-            return jStat3.randn() * Math2.sqrt(dof / (2 * jStat3.randg(dof / 2)));
+            return jStat4.randn() * Math2.sqrt(dof / (2 * jStat4.randg(dof / 2)));
           },
           variance: function variance(dof) {
             return dof > 2 ? dof / (dof - 2) : dof > 1 ? Infinity : void 0;
           }
         });
-        jStat3.extend(jStat3.weibull, {
+        jStat4.extend(jStat4.weibull, {
           pdf: function pdf(x2, scale, shape) {
             if (x2 < 0 || scale < 0 || shape < 0)
               return 0;
@@ -27889,7 +27889,7 @@ var require_jstat = __commonJS({
             return scale * Math2.pow(-Math2.log(1 - p), 1 / shape);
           },
           mean: function(scale, shape) {
-            return scale * jStat3.gammafn(1 + 1 / shape);
+            return scale * jStat4.gammafn(1 + 1 / shape);
           },
           median: function median(scale, shape) {
             return scale * Math2.pow(Math2.log(2), 1 / shape);
@@ -27900,13 +27900,13 @@ var require_jstat = __commonJS({
             return scale * Math2.pow((shape - 1) / shape, 1 / shape);
           },
           sample: function sample(scale, shape) {
-            return scale * Math2.pow(-Math2.log(jStat3._random_fn()), 1 / shape);
+            return scale * Math2.pow(-Math2.log(jStat4._random_fn()), 1 / shape);
           },
           variance: function variance(scale, shape) {
-            return scale * scale * jStat3.gammafn(1 + 2 / shape) - Math2.pow(jStat3.weibull.mean(scale, shape), 2);
+            return scale * scale * jStat4.gammafn(1 + 2 / shape) - Math2.pow(jStat4.weibull.mean(scale, shape), 2);
           }
         });
-        jStat3.extend(jStat3.uniform, {
+        jStat4.extend(jStat4.uniform, {
           pdf: function pdf(x2, a, b) {
             return x2 < a || x2 > b ? 0 : 1 / (b - a);
           },
@@ -27924,13 +27924,13 @@ var require_jstat = __commonJS({
             return 0.5 * (a + b);
           },
           median: function median(a, b) {
-            return jStat3.mean(a, b);
+            return jStat4.mean(a, b);
           },
           mode: function mode() {
             throw new Error("mode is not yet implemented");
           },
           sample: function sample(a, b) {
-            return a / 2 + b / 2 + (b / 2 - a / 2) * (2 * jStat3._random_fn() - 1);
+            return a / 2 + b / 2 + (b / 2 - a / 2) * (2 * jStat4._random_fn() - 1);
           },
           variance: function variance(a, b) {
             return Math2.pow(b - a, 2) / 12;
@@ -27960,9 +27960,9 @@ var require_jstat = __commonJS({
           }
           return a1 / a;
         }
-        jStat3.extend(jStat3.binomial, {
+        jStat4.extend(jStat4.binomial, {
           pdf: function pdf(k, n, p) {
-            return p === 0 || p === 1 ? n * p === k ? 1 : 0 : jStat3.combination(n, k) * Math2.pow(p, k) * Math2.pow(1 - p, n - k);
+            return p === 0 || p === 1 ? n * p === k ? 1 : 0 : jStat4.combination(n, k) * Math2.pow(p, k) * Math2.pow(1 - p, n - k);
           },
           cdf: function cdf(x2, n, p) {
             var betacdf;
@@ -27978,7 +27978,7 @@ var require_jstat = __commonJS({
             var a = x2 + 1;
             var b = n - x2;
             var s = a + b;
-            var bt = Math2.exp(jStat3.gammaln(s) - jStat3.gammaln(b) - jStat3.gammaln(a) + a * Math2.log(z) + b * Math2.log(1 - z));
+            var bt = Math2.exp(jStat4.gammaln(s) - jStat4.gammaln(b) - jStat4.gammaln(a) + a * Math2.log(z) + b * Math2.log(1 - z));
             if (z < (a + 1) / (s + 2))
               betacdf = bt * betinc(z, a, b, eps);
             else
@@ -27986,24 +27986,24 @@ var require_jstat = __commonJS({
             return Math2.round((1 - betacdf) * (1 / eps)) / (1 / eps);
           }
         });
-        jStat3.extend(jStat3.negbin, {
+        jStat4.extend(jStat4.negbin, {
           pdf: function pdf(k, r, p) {
             if (k !== k >>> 0)
               return false;
             if (k < 0)
               return 0;
-            return jStat3.combination(k + r - 1, r - 1) * Math2.pow(1 - p, k) * Math2.pow(p, r);
+            return jStat4.combination(k + r - 1, r - 1) * Math2.pow(1 - p, k) * Math2.pow(p, r);
           },
           cdf: function cdf(x2, r, p) {
             var sum = 0, k = 0;
             if (x2 < 0) return 0;
             for (; k <= x2; k++) {
-              sum += jStat3.negbin.pdf(k, r, p);
+              sum += jStat4.negbin.pdf(k, r, p);
             }
             return sum;
           }
         });
-        jStat3.extend(jStat3.hypgeom, {
+        jStat4.extend(jStat4.hypgeom, {
           pdf: function pdf(k, N, m, n) {
             if (k !== k | 0) {
               return false;
@@ -28013,14 +28013,14 @@ var require_jstat = __commonJS({
               return 0;
             } else if (m * 2 > N) {
               if (n * 2 > N) {
-                return jStat3.hypgeom.pdf(N - m - n + k, N, N - m, N - n);
+                return jStat4.hypgeom.pdf(N - m - n + k, N, N - m, N - n);
               } else {
-                return jStat3.hypgeom.pdf(n - k, N, N - m, n);
+                return jStat4.hypgeom.pdf(n - k, N, N - m, n);
               }
             } else if (n * 2 > N) {
-              return jStat3.hypgeom.pdf(m - k, N, m, N - n);
+              return jStat4.hypgeom.pdf(m - k, N, m, N - n);
             } else if (m < n) {
-              return jStat3.hypgeom.pdf(k, N, n, m);
+              return jStat4.hypgeom.pdf(k, N, n, m);
             } else {
               var scaledPDF = 1;
               var samplesDone = 0;
@@ -28044,14 +28044,14 @@ var require_jstat = __commonJS({
               return 1;
             } else if (m * 2 > N) {
               if (n * 2 > N) {
-                return jStat3.hypgeom.cdf(N - m - n + x2, N, N - m, N - n);
+                return jStat4.hypgeom.cdf(N - m - n + x2, N, N - m, N - n);
               } else {
-                return 1 - jStat3.hypgeom.cdf(n - x2 - 1, N, N - m, n);
+                return 1 - jStat4.hypgeom.cdf(n - x2 - 1, N, N - m, n);
               }
             } else if (n * 2 > N) {
-              return 1 - jStat3.hypgeom.cdf(m - x2 - 1, N, m, N - n);
+              return 1 - jStat4.hypgeom.cdf(m - x2 - 1, N, m, N - n);
             } else if (m < n) {
-              return jStat3.hypgeom.cdf(x2, N, n, m);
+              return jStat4.hypgeom.cdf(x2, N, n, m);
             } else {
               var scaledCDF = 1;
               var scaledPDF = 1;
@@ -28073,20 +28073,20 @@ var require_jstat = __commonJS({
             }
           }
         });
-        jStat3.extend(jStat3.poisson, {
+        jStat4.extend(jStat4.poisson, {
           pdf: function pdf(k, l) {
             if (l < 0 || k % 1 !== 0 || k < 0) {
               return 0;
             }
-            return Math2.pow(l, k) * Math2.exp(-l) / jStat3.factorial(k);
+            return Math2.pow(l, k) * Math2.exp(-l) / jStat4.factorial(k);
           },
           cdf: function cdf(x2, l) {
             var sumarr = [], k = 0;
             if (x2 < 0) return 0;
             for (; k <= x2; k++) {
-              sumarr.push(jStat3.poisson.pdf(k, l));
+              sumarr.push(jStat4.poisson.pdf(k, l));
             }
-            return jStat3.sum(sumarr);
+            return jStat4.sum(sumarr);
           },
           mean: function(l) {
             return l;
@@ -28098,7 +28098,7 @@ var require_jstat = __commonJS({
             var p = 1, k = 0, L = Math2.exp(-l);
             do {
               k++;
-              p *= jStat3._random_fn();
+              p *= jStat4._random_fn();
             } while (p > L);
             return k - 1;
           },
@@ -28123,7 +28123,7 @@ var require_jstat = __commonJS({
               if (k < 0 || us < 0.013 && V > us) {
                 continue;
               }
-              if (Math2.log(V) + Math2.log(invalpha) - Math2.log(a / (us * us) + b) <= -lam + k * loglam - jStat3.loggam(k + 1)) {
+              if (Math2.log(V) + Math2.log(invalpha) - Math2.log(a / (us * us) + b) <= -lam + k * loglam - jStat4.loggam(k + 1)) {
                 return k;
               }
             }
@@ -28135,7 +28135,7 @@ var require_jstat = __commonJS({
               return this.sampleLarge(l);
           }
         });
-        jStat3.extend(jStat3.triangular, {
+        jStat4.extend(jStat4.triangular, {
           pdf: function pdf(x2, a, b, c) {
             if (b <= a || c < a || c > b) {
               return NaN;
@@ -28188,7 +28188,7 @@ var require_jstat = __commonJS({
             return c;
           },
           sample: function sample(a, b, c) {
-            var u = jStat3._random_fn();
+            var u = jStat4._random_fn();
             if (u < (c - a) / (b - a))
               return a + Math2.sqrt(u * (b - a) * (c - a));
             return b - Math2.sqrt((1 - u) * (b - a) * (b - c));
@@ -28197,7 +28197,7 @@ var require_jstat = __commonJS({
             return (a * a + b * b + c * c - a * b - a * c - b * c) / 18;
           }
         });
-        jStat3.extend(jStat3.arcsine, {
+        jStat4.extend(jStat4.arcsine, {
           pdf: function pdf(x2, a, b) {
             if (b <= a) return NaN;
             return x2 <= a || x2 >= b ? 0 : 2 / Math2.PI * Math2.pow(Math2.pow(b - a, 2) - Math2.pow(2 * x2 - a - b, 2), -0.5);
@@ -28224,7 +28224,7 @@ var require_jstat = __commonJS({
             throw new Error("mode is not yet implemented");
           },
           sample: function sample(a, b) {
-            return (a + b) / 2 + (b - a) / 2 * Math2.sin(2 * Math2.PI * jStat3.uniform.sample(0, 1));
+            return (a + b) / 2 + (b - a) / 2 * Math2.sin(2 * Math2.PI * jStat4.uniform.sample(0, 1));
           },
           variance: function variance(a, b) {
             if (b <= a) return NaN;
@@ -28234,7 +28234,7 @@ var require_jstat = __commonJS({
         function laplaceSign(x2) {
           return x2 / Math2.abs(x2);
         }
-        jStat3.extend(jStat3.laplace, {
+        jStat4.extend(jStat4.laplace, {
           pdf: function pdf(x2, mu, b) {
             return b <= 0 ? 0 : Math2.exp(-Math2.abs(x2 - mu) / b) / (2 * b);
           },
@@ -28261,7 +28261,7 @@ var require_jstat = __commonJS({
             return 2 * b * b;
           },
           sample: function sample(mu, b) {
-            var u = jStat3._random_fn() - 0.5;
+            var u = jStat4._random_fn() - 0.5;
             return mu - b * laplaceSign(u) * Math2.log(1 - 2 * Math2.abs(u));
           }
         });
@@ -28294,7 +28294,7 @@ var require_jstat = __commonJS({
           var qsqz = w * 0.5;
           if (qsqz >= bb)
             return 1;
-          var pr_w = 2 * jStat3.normal.cdf(qsqz, 0, 1, 1, 0) - 1;
+          var pr_w = 2 * jStat4.normal.cdf(qsqz, 0, 1, 1, 0) - 1;
           if (pr_w >= Math2.exp(C2 / cc))
             pr_w = Math2.pow(pr_w, cc);
           else
@@ -28327,8 +28327,8 @@ var require_jstat = __commonJS({
               var qexpo = ac * ac;
               if (qexpo > C3)
                 break;
-              var pplus = 2 * jStat3.normal.cdf(ac, 0, 1, 1, 0);
-              var pminus = 2 * jStat3.normal.cdf(ac, w, 1, 1, 0);
+              var pplus = 2 * jStat4.normal.cdf(ac, 0, 1, 1, 0);
+              var pminus = 2 * jStat4.normal.cdf(ac, w, 1, 1, 0);
               var rinsum = pplus * 0.5 - pminus * 0.5;
               if (rinsum >= Math2.exp(C1 / cc1)) {
                 rinsum = aleg[j - 1] * Math2.exp(-(0.5 * qexpo)) * Math2.pow(rinsum, cc1);
@@ -28373,7 +28373,7 @@ var require_jstat = __commonJS({
           if (v < vmax) q += -c3 / v + c4 * t / v;
           return t * (q * Math2.log(c - 1) + c5);
         }
-        jStat3.extend(jStat3.tukey, {
+        jStat4.extend(jStat4.tukey, {
           cdf: function cdf(q, nmeans, df) {
             var rr = 1;
             var cc = nmeans;
@@ -28417,7 +28417,7 @@ var require_jstat = __commonJS({
             if (df > dlarg)
               return tukeyWprob(q, rr, cc);
             var f2 = df * 0.5;
-            var f2lf = f2 * Math2.log(df) - df * Math2.log(2) - jStat3.gammaln(f2);
+            var f2lf = f2 * Math2.log(df) - df * Math2.log(2) - jStat4.gammaln(f2);
             var f21 = f2 - 1;
             var ff4 = df * 0.25;
             var ulen;
@@ -28472,13 +28472,13 @@ var require_jstat = __commonJS({
             if (p === 0) return 0;
             if (p === 1) return Infinity;
             var x0 = tukeyQinv(p, cc, df);
-            var valx0 = jStat3.tukey.cdf(x0, nmeans, df) - p;
+            var valx0 = jStat4.tukey.cdf(x0, nmeans, df) - p;
             var x1;
             if (valx0 > 0)
               x1 = Math2.max(0, x0 - 1);
             else
               x1 = x0 + 1;
-            var valx1 = jStat3.tukey.cdf(x1, nmeans, df) - p;
+            var valx1 = jStat4.tukey.cdf(x1, nmeans, df) - p;
             var ans;
             for (var iter = 1; iter < maxiter; iter++) {
               ans = x1 - valx1 * (x1 - x0) / (valx1 - valx0);
@@ -28488,7 +28488,7 @@ var require_jstat = __commonJS({
                 ans = 0;
                 valx1 = -p;
               }
-              valx1 = jStat3.tukey.cdf(ans, nmeans, df) - p;
+              valx1 = jStat4.tukey.cdf(ans, nmeans, df) - p;
               x1 = ans;
               var xabs = Math2.abs(x1 - x0);
               if (xabs < eps)
@@ -28497,46 +28497,46 @@ var require_jstat = __commonJS({
             throw new Error("tukey.inv failed to converge");
           }
         });
-      })(jStat2, Math);
-      (function(jStat3, Math2) {
+      })(jStat3, Math);
+      (function(jStat4, Math2) {
         var push = Array.prototype.push;
-        var isArray = jStat3.utils.isArray;
+        var isArray = jStat4.utils.isArray;
         function isUsable(arg) {
-          return isArray(arg) || arg instanceof jStat3;
+          return isArray(arg) || arg instanceof jStat4;
         }
-        jStat3.extend({
+        jStat4.extend({
           // add a vector/matrix to a vector/matrix or scalar
           add: function add(arr, arg) {
             if (isUsable(arg)) {
               if (!isUsable(arg[0])) arg = [arg];
-              return jStat3.map(arr, function(value, row, col) {
-                return value + arg[row][col];
+              return jStat4.map(arr, function(value2, row, col) {
+                return value2 + arg[row][col];
               });
             }
-            return jStat3.map(arr, function(value) {
-              return value + arg;
+            return jStat4.map(arr, function(value2) {
+              return value2 + arg;
             });
           },
           // subtract a vector or scalar from the vector
           subtract: function subtract(arr, arg) {
             if (isUsable(arg)) {
               if (!isUsable(arg[0])) arg = [arg];
-              return jStat3.map(arr, function(value, row, col) {
-                return value - arg[row][col] || 0;
+              return jStat4.map(arr, function(value2, row, col) {
+                return value2 - arg[row][col] || 0;
               });
             }
-            return jStat3.map(arr, function(value) {
-              return value - arg;
+            return jStat4.map(arr, function(value2) {
+              return value2 - arg;
             });
           },
           // matrix division
           divide: function divide(arr, arg) {
             if (isUsable(arg)) {
               if (!isUsable(arg[0])) arg = [arg];
-              return jStat3.multiply(arr, jStat3.inv(arg));
+              return jStat4.multiply(arr, jStat4.inv(arg));
             }
-            return jStat3.map(arr, function(value) {
-              return value / arg;
+            return jStat4.map(arr, function(value2) {
+              return value2 / arg;
             });
           },
           // matrix multiplication
@@ -28545,7 +28545,7 @@ var require_jstat = __commonJS({
             if (arr.length === void 0 && arg.length === void 0) {
               return arr * arg;
             }
-            nrow = arr.length, ncol = arr[0].length, res = jStat3.zeros(nrow, nrescols = isUsable(arg) ? arg[0].length : ncol), rescols = 0;
+            nrow = arr.length, ncol = arr[0].length, res = jStat4.zeros(nrow, nrescols = isUsable(arg) ? arg[0].length : ncol), rescols = 0;
             if (isUsable(arg)) {
               for (; rescols < nrescols; rescols++) {
                 for (row = 0; row < nrow; row++) {
@@ -28557,8 +28557,8 @@ var require_jstat = __commonJS({
               }
               return nrow === 1 && rescols === 1 ? res[0][0] : res;
             }
-            return jStat3.map(arr, function(value) {
-              return value * arg;
+            return jStat4.map(arr, function(value2) {
+              return value2 * arg;
             });
           },
           // outer([1,2,3],[4,5,6])
@@ -28567,7 +28567,7 @@ var require_jstat = __commonJS({
           // ->
           // [[4,5,6],[8,10,12],[12,15,18]]
           outer: function outer(A, B) {
-            return jStat3.multiply(A.map(function(t) {
+            return jStat4.multiply(A.map(function(t) {
               return [t];
             }), [B]);
           },
@@ -28575,7 +28575,7 @@ var require_jstat = __commonJS({
           dot: function dot(arr, arg) {
             if (!isUsable(arr[0])) arr = [arr];
             if (!isUsable(arg[0])) arg = [arg];
-            var left = arr[0].length === 1 && arr.length !== 1 ? jStat3.transpose(arr) : arr, right = arg[0].length === 1 && arg.length !== 1 ? jStat3.transpose(arg) : arg, res = [], row = 0, nrow = left.length, ncol = left[0].length, sum, col;
+            var left = arr[0].length === 1 && arr.length !== 1 ? jStat4.transpose(arr) : arr, right = arg[0].length === 1 && arg.length !== 1 ? jStat4.transpose(arg) : arg, res = [], row = 0, nrow = left.length, ncol = left[0].length, sum, col;
             for (; row < nrow; row++) {
               res[row] = [];
               sum = 0;
@@ -28587,26 +28587,26 @@ var require_jstat = __commonJS({
           },
           // raise every element by a scalar
           pow: function pow(arr, arg) {
-            return jStat3.map(arr, function(value) {
-              return Math2.pow(value, arg);
+            return jStat4.map(arr, function(value2) {
+              return Math2.pow(value2, arg);
             });
           },
           // exponentiate every element
           exp: function exp(arr) {
-            return jStat3.map(arr, function(value) {
-              return Math2.exp(value);
+            return jStat4.map(arr, function(value2) {
+              return Math2.exp(value2);
             });
           },
           // generate the natural log of every element
           log: function exp(arr) {
-            return jStat3.map(arr, function(value) {
-              return Math2.log(value);
+            return jStat4.map(arr, function(value2) {
+              return Math2.log(value2);
             });
           },
           // generate the absolute values of the vector
           abs: function abs(arr) {
-            return jStat3.map(arr, function(value) {
-              return Math2.abs(value);
+            return jStat4.map(arr, function(value2) {
+              return Math2.abs(value2);
             });
           },
           // computes the p-norm of the vector
@@ -28623,7 +28623,7 @@ var require_jstat = __commonJS({
           // computes the angle between two vectors in rads
           // In case a matrix is passed, this uses the first row as the vector
           angle: function angle(arr, arg) {
-            return Math2.acos(jStat3.dot(arr, arg) / (jStat3.norm(arr) * jStat3.norm(arg)));
+            return Math2.acos(jStat4.dot(arr, arg) / (jStat4.norm(arr) * jStat4.norm(arg)));
           },
           // augment one matrix by another
           // Note: this function returns a matrix, not a jStat object
@@ -28644,8 +28644,8 @@ var require_jstat = __commonJS({
           inv: function inv(a) {
             var rows = a.length;
             var cols = a[0].length;
-            var b = jStat3.identity(rows, cols);
-            var c = jStat3.gauss_jordan(a, b);
+            var b = jStat4.identity(rows, cols);
+            var c = jStat4.gauss_jordan(a, b);
             var result = [];
             var i2 = 0;
             var j;
@@ -28681,7 +28681,7 @@ var require_jstat = __commonJS({
           },
           gauss_elimination: function gauss_elimination(a, b) {
             var i2 = 0, j = 0, n = a.length, m = a[0].length, factor = 1, sum = 0, x2 = [], maug, pivot, temp, k;
-            a = jStat3.aug(a, b);
+            a = jStat4.aug(a, b);
             maug = a[0].length;
             for (i2 = 0; i2 < n; i2++) {
               pivot = a[i2][i2];
@@ -28716,7 +28716,7 @@ var require_jstat = __commonJS({
             return x2;
           },
           gauss_jordan: function gauss_jordan(a, b) {
-            var m = jStat3.aug(a, b);
+            var m = jStat4.aug(a, b);
             var h = m.length;
             var w = m[0].length;
             var c = 0;
@@ -28763,7 +28763,7 @@ var require_jstat = __commonJS({
           // will return [[2.666],[0.1666],[1.666]]
           triaUpSolve: function triaUpSolve(A, b) {
             var size = A[0].length;
-            var x2 = jStat3.zeros(1, size)[0];
+            var x2 = jStat4.zeros(1, size)[0];
             var parts;
             var matrix_mode = false;
             if (b[0].length != void 0) {
@@ -28772,11 +28772,11 @@ var require_jstat = __commonJS({
               });
               matrix_mode = true;
             }
-            jStat3.arange(size - 1, -1, -1).forEach(function(i2) {
-              parts = jStat3.arange(i2 + 1, size).map(function(j) {
+            jStat4.arange(size - 1, -1, -1).forEach(function(i2) {
+              parts = jStat4.arange(i2 + 1, size).map(function(j) {
                 return x2[j] * A[i2][j];
               });
-              x2[i2] = (b[i2] - jStat3.sum(parts)) / A[i2][i2];
+              x2[i2] = (b[i2] - jStat4.sum(parts)) / A[i2][i2];
             });
             if (matrix_mode)
               return x2.map(function(i2) {
@@ -28786,7 +28786,7 @@ var require_jstat = __commonJS({
           },
           triaLowSolve: function triaLowSolve(A, b) {
             var size = A[0].length;
-            var x2 = jStat3.zeros(1, size)[0];
+            var x2 = jStat4.zeros(1, size)[0];
             var parts;
             var matrix_mode = false;
             if (b[0].length != void 0) {
@@ -28795,11 +28795,11 @@ var require_jstat = __commonJS({
               });
               matrix_mode = true;
             }
-            jStat3.arange(size).forEach(function(i2) {
-              parts = jStat3.arange(i2).map(function(j) {
+            jStat4.arange(size).forEach(function(i2) {
+              parts = jStat4.arange(i2).map(function(j) {
                 return A[i2][j] * x2[j];
               });
-              x2[i2] = (b[i2] - jStat3.sum(parts)) / A[i2][i2];
+              x2[i2] = (b[i2] - jStat4.sum(parts)) / A[i2][i2];
             });
             if (matrix_mode)
               return x2.map(function(i2) {
@@ -28813,24 +28813,24 @@ var require_jstat = __commonJS({
           // U is upper triangular matrix
           lu: function lu(A) {
             var size = A.length;
-            var L = jStat3.identity(size);
-            var R = jStat3.zeros(A.length, A[0].length);
+            var L = jStat4.identity(size);
+            var R = jStat4.zeros(A.length, A[0].length);
             var parts;
-            jStat3.arange(size).forEach(function(t) {
+            jStat4.arange(size).forEach(function(t) {
               R[0][t] = A[0][t];
             });
-            jStat3.arange(1, size).forEach(function(l) {
-              jStat3.arange(l).forEach(function(i2) {
-                parts = jStat3.arange(i2).map(function(jj) {
+            jStat4.arange(1, size).forEach(function(l) {
+              jStat4.arange(l).forEach(function(i2) {
+                parts = jStat4.arange(i2).map(function(jj) {
                   return L[l][jj] * R[jj][i2];
                 });
-                L[l][i2] = (A[l][i2] - jStat3.sum(parts)) / R[i2][i2];
+                L[l][i2] = (A[l][i2] - jStat4.sum(parts)) / R[i2][i2];
               });
-              jStat3.arange(l, size).forEach(function(j) {
-                parts = jStat3.arange(l).map(function(jj) {
+              jStat4.arange(l, size).forEach(function(j) {
+                parts = jStat4.arange(l).map(function(jj) {
                   return L[l][jj] * R[jj][j];
                 });
-                R[l][j] = A[parts.length][j] - jStat3.sum(parts);
+                R[l][j] = A[parts.length][j] - jStat4.sum(parts);
               });
             });
             return [L, R];
@@ -28840,18 +28840,18 @@ var require_jstat = __commonJS({
           // T is lower triangular matrix
           cholesky: function cholesky(A) {
             var size = A.length;
-            var T = jStat3.zeros(A.length, A[0].length);
+            var T = jStat4.zeros(A.length, A[0].length);
             var parts;
-            jStat3.arange(size).forEach(function(i2) {
-              parts = jStat3.arange(i2).map(function(t) {
+            jStat4.arange(size).forEach(function(i2) {
+              parts = jStat4.arange(i2).map(function(t) {
                 return Math2.pow(T[i2][t], 2);
               });
-              T[i2][i2] = Math2.sqrt(A[i2][i2] - jStat3.sum(parts));
-              jStat3.arange(i2 + 1, size).forEach(function(j) {
-                parts = jStat3.arange(i2).map(function(t) {
+              T[i2][i2] = Math2.sqrt(A[i2][i2] - jStat4.sum(parts));
+              jStat4.arange(i2 + 1, size).forEach(function(j) {
+                parts = jStat4.arange(i2).map(function(t) {
                   return T[i2][t] * T[j][t];
                 });
-                T[j][i2] = (A[i2][j] - jStat3.sum(parts)) / T[i2][i2];
+                T[j][i2] = (A[i2][j] - jStat4.sum(parts)) / T[i2][i2];
               });
             });
             return T;
@@ -28881,14 +28881,14 @@ var require_jstat = __commonJS({
                 }
               }
             }
-            h = jStat3.multiply(jStat3.multiply(jStat3.inv(d), jStat3.add(l, u)), -1);
-            c = jStat3.multiply(jStat3.inv(d), b);
+            h = jStat4.multiply(jStat4.multiply(jStat4.inv(d), jStat4.add(l, u)), -1);
+            c = jStat4.multiply(jStat4.inv(d), b);
             xv = x2;
-            xk = jStat3.add(jStat3.multiply(h, x2), c);
+            xk = jStat4.add(jStat4.multiply(h, x2), c);
             i2 = 2;
-            while (Math2.abs(jStat3.norm(jStat3.subtract(xk, xv))) > r) {
+            while (Math2.abs(jStat4.norm(jStat4.subtract(xk, xv))) > r) {
               xv = xk;
-              xk = jStat3.add(jStat3.multiply(h, xv), c);
+              xk = jStat4.add(jStat4.multiply(h, xv), c);
               i2++;
             }
             return xk;
@@ -28917,14 +28917,14 @@ var require_jstat = __commonJS({
                 }
               }
             }
-            h = jStat3.multiply(jStat3.multiply(jStat3.inv(jStat3.add(d, l)), u), -1);
-            c = jStat3.multiply(jStat3.inv(jStat3.add(d, l)), b);
+            h = jStat4.multiply(jStat4.multiply(jStat4.inv(jStat4.add(d, l)), u), -1);
+            c = jStat4.multiply(jStat4.inv(jStat4.add(d, l)), b);
             xv = x2;
-            xk = jStat3.add(jStat3.multiply(h, x2), c);
+            xk = jStat4.add(jStat4.multiply(h, x2), c);
             i2 = 2;
-            while (Math2.abs(jStat3.norm(jStat3.subtract(xk, xv))) > r) {
+            while (Math2.abs(jStat4.norm(jStat4.subtract(xk, xv))) > r) {
               xv = xk;
-              xk = jStat3.add(jStat3.multiply(h, xv), c);
+              xk = jStat4.add(jStat4.multiply(h, xv), c);
               i2 = i2 + 1;
             }
             return xk;
@@ -28953,23 +28953,23 @@ var require_jstat = __commonJS({
                 }
               }
             }
-            h = jStat3.multiply(
-              jStat3.inv(jStat3.add(d, jStat3.multiply(l, w))),
-              jStat3.subtract(
-                jStat3.multiply(d, 1 - w),
-                jStat3.multiply(u, w)
+            h = jStat4.multiply(
+              jStat4.inv(jStat4.add(d, jStat4.multiply(l, w))),
+              jStat4.subtract(
+                jStat4.multiply(d, 1 - w),
+                jStat4.multiply(u, w)
               )
             );
-            c = jStat3.multiply(jStat3.multiply(jStat3.inv(jStat3.add(
+            c = jStat4.multiply(jStat4.multiply(jStat4.inv(jStat4.add(
               d,
-              jStat3.multiply(l, w)
+              jStat4.multiply(l, w)
             )), b), w);
             xv = x2;
-            xk = jStat3.add(jStat3.multiply(h, x2), c);
+            xk = jStat4.add(jStat4.multiply(h, x2), c);
             i2 = 2;
-            while (Math2.abs(jStat3.norm(jStat3.subtract(xk, xv))) > r) {
+            while (Math2.abs(jStat4.norm(jStat4.subtract(xk, xv))) > r) {
               xv = xk;
-              xk = jStat3.add(jStat3.multiply(h, xv), c);
+              xk = jStat4.add(jStat4.multiply(h, xv), c);
               i2++;
             }
             return xk;
@@ -28988,14 +28988,14 @@ var require_jstat = __commonJS({
               factor = a[i2 + 1][i2] > 0 ? -1 : 1;
               alpha = factor * Math2.sqrt(alpha);
               r = Math2.sqrt((alpha * alpha - a[i2 + 1][i2] * alpha) / 2);
-              w = jStat3.zeros(m, 1);
+              w = jStat4.zeros(m, 1);
               w[i2 + 1][0] = (a[i2 + 1][i2] - alpha) / (2 * r);
               for (k = i2 + 2; k < m; k++) w[k][0] = a[k][i2] / (2 * r);
-              p = jStat3.subtract(
-                jStat3.identity(m, n),
-                jStat3.multiply(jStat3.multiply(w, jStat3.transpose(w)), 2)
+              p = jStat4.subtract(
+                jStat4.identity(m, n),
+                jStat4.multiply(jStat4.multiply(w, jStat4.transpose(w)), 2)
               );
-              a = jStat3.multiply(p, jStat3.multiply(a, p));
+              a = jStat4.multiply(p, jStat4.multiply(a, p));
             }
             return a;
           },
@@ -29003,13 +29003,13 @@ var require_jstat = __commonJS({
           // Q is orthogonal matrix
           // R is upper triangular
           QR: (function() {
-            var sum = jStat3.sum;
-            var range = jStat3.arange;
+            var sum = jStat4.sum;
+            var range = jStat4.arange;
             function qr2(x2) {
               var n = x2.length;
               var p = x2[0].length;
-              var r = jStat3.zeros(p, p);
-              x2 = jStat3.copy(x2);
+              var r = jStat4.zeros(p, p);
+              x2 = jStat4.copy(x2);
               var i2, j, k;
               for (j = 0; j < p; j++) {
                 r[j][j] = Math2.sqrt(sum(range(n).map(function(i3) {
@@ -29033,28 +29033,28 @@ var require_jstat = __commonJS({
           })(),
           lstsq: /* @__PURE__ */ (function() {
             function R_I(A) {
-              A = jStat3.copy(A);
+              A = jStat4.copy(A);
               var size = A.length;
-              var I = jStat3.identity(size);
-              jStat3.arange(size - 1, -1, -1).forEach(function(i2) {
-                jStat3.sliceAssign(
+              var I = jStat4.identity(size);
+              jStat4.arange(size - 1, -1, -1).forEach(function(i2) {
+                jStat4.sliceAssign(
                   I,
                   { row: i2 },
-                  jStat3.divide(jStat3.slice(I, { row: i2 }), A[i2][i2])
+                  jStat4.divide(jStat4.slice(I, { row: i2 }), A[i2][i2])
                 );
-                jStat3.sliceAssign(
+                jStat4.sliceAssign(
                   A,
                   { row: i2 },
-                  jStat3.divide(jStat3.slice(A, { row: i2 }), A[i2][i2])
+                  jStat4.divide(jStat4.slice(A, { row: i2 }), A[i2][i2])
                 );
-                jStat3.arange(i2).forEach(function(j) {
-                  var c = jStat3.multiply(A[j][i2], -1);
-                  var Aj = jStat3.slice(A, { row: j });
-                  var cAi = jStat3.multiply(jStat3.slice(A, { row: i2 }), c);
-                  jStat3.sliceAssign(A, { row: j }, jStat3.add(Aj, cAi));
-                  var Ij = jStat3.slice(I, { row: j });
-                  var cIi = jStat3.multiply(jStat3.slice(I, { row: i2 }), c);
-                  jStat3.sliceAssign(I, { row: j }, jStat3.add(Ij, cIi));
+                jStat4.arange(i2).forEach(function(j) {
+                  var c = jStat4.multiply(A[j][i2], -1);
+                  var Aj = jStat4.slice(A, { row: j });
+                  var cAi = jStat4.multiply(jStat4.slice(A, { row: i2 }), c);
+                  jStat4.sliceAssign(A, { row: j }, jStat4.add(Aj, cAi));
+                  var Ij = jStat4.slice(I, { row: j });
+                  var cIi = jStat4.multiply(jStat4.slice(I, { row: i2 }), c);
+                  jStat4.sliceAssign(I, { row: j }, jStat4.add(Ij, cIi));
                 });
               });
               return I;
@@ -29067,18 +29067,18 @@ var require_jstat = __commonJS({
                 });
                 array_mode = true;
               }
-              var QR = jStat3.QR(A);
+              var QR = jStat4.QR(A);
               var Q = QR[0];
               var R = QR[1];
               var attrs = A[0].length;
-              var Q1 = jStat3.slice(Q, { col: { end: attrs } });
-              var R1 = jStat3.slice(R, { row: { end: attrs } });
+              var Q1 = jStat4.slice(Q, { col: { end: attrs } });
+              var R1 = jStat4.slice(R, { row: { end: attrs } });
               var RI = R_I(R1);
-              var Q2 = jStat3.transpose(Q1);
+              var Q2 = jStat4.transpose(Q1);
               if (Q2[0].length === void 0) {
                 Q2 = [Q2];
               }
-              var x2 = jStat3.multiply(jStat3.multiply(RI, Q2), b);
+              var x2 = jStat4.multiply(jStat4.multiply(RI, Q2), b);
               if (x2.length === void 0) {
                 x2 = [[x2]];
               }
@@ -29093,7 +29093,7 @@ var require_jstat = __commonJS({
           jacobi: function jacobi(a) {
             var condition = 1;
             var n = a.length;
-            var e = jStat3.identity(n, n);
+            var e = jStat4.identity(n, n);
             var ev = [];
             var b, i2, j, p, q, maxim, theta, s;
             while (condition === 1) {
@@ -29115,13 +29115,13 @@ var require_jstat = __commonJS({
                 theta = a[p][q] > 0 ? Math2.PI / 4 : -Math2.PI / 4;
               else
                 theta = Math2.atan(2 * a[p][q] / (a[p][p] - a[q][q])) / 2;
-              s = jStat3.identity(n, n);
+              s = jStat4.identity(n, n);
               s[p][p] = Math2.cos(theta);
               s[p][q] = -Math2.sin(theta);
               s[q][p] = Math2.sin(theta);
               s[q][q] = Math2.cos(theta);
-              e = jStat3.multiply(e, s);
-              b = jStat3.multiply(jStat3.multiply(jStat3.inv(s), a), s);
+              e = jStat4.multiply(e, s);
+              b = jStat4.multiply(jStat4.multiply(jStat4.inv(s), a), s);
               a = b;
               condition = 0;
               for (i2 = 1; i2 < n; i2++) {
@@ -29239,7 +29239,7 @@ var require_jstat = __commonJS({
             }
             return h / 3 * (I + f(b));
           },
-          hermite: function hermite(X, F, dF, value) {
+          hermite: function hermite(X, F, dF, value2) {
             var n = X.length;
             var p = 0;
             var i2 = 0;
@@ -29251,19 +29251,19 @@ var require_jstat = __commonJS({
             for (; i2 < n; i2++) {
               l[i2] = 1;
               for (j = 0; j < n; j++) {
-                if (i2 != j) l[i2] *= (value - X[j]) / (X[i2] - X[j]);
+                if (i2 != j) l[i2] *= (value2 - X[j]) / (X[i2] - X[j]);
               }
               dl[i2] = 0;
               for (j = 0; j < n; j++) {
                 if (i2 != j) dl[i2] += 1 / (X[i2] - X[j]);
               }
-              A[i2] = (1 - 2 * (value - X[i2]) * dl[i2]) * (l[i2] * l[i2]);
-              B[i2] = (value - X[i2]) * (l[i2] * l[i2]);
+              A[i2] = (1 - 2 * (value2 - X[i2]) * dl[i2]) * (l[i2] * l[i2]);
+              B[i2] = (value2 - X[i2]) * (l[i2] * l[i2]);
               p += A[i2] * F[i2] + B[i2] * dF[i2];
             }
             return p;
           },
-          lagrange: function lagrange(X, F, value) {
+          lagrange: function lagrange(X, F, value2) {
             var p = 0;
             var i2 = 0;
             var j, l;
@@ -29271,13 +29271,13 @@ var require_jstat = __commonJS({
             for (; i2 < n; i2++) {
               l = F[i2];
               for (j = 0; j < n; j++) {
-                if (i2 != j) l *= (value - X[j]) / (X[i2] - X[j]);
+                if (i2 != j) l *= (value2 - X[j]) / (X[i2] - X[j]);
               }
               p += l;
             }
             return p;
           },
-          cubic_spline: function cubic_spline(X, F, value) {
+          cubic_spline: function cubic_spline(X, F, value2) {
             var n = X.length;
             var i2 = 0, j;
             var A = [];
@@ -29301,16 +29301,16 @@ var require_jstat = __commonJS({
               A[i2][i2 + 1] = h[i2];
               B[i2][0] = alpha[i2];
             }
-            c = jStat3.multiply(jStat3.inv(A), B);
+            c = jStat4.multiply(jStat4.inv(A), B);
             for (j = 0; j < n - 1; j++) {
               b[j] = (F[j + 1] - F[j]) / h[j] - h[j] * (c[j + 1][0] + 2 * c[j][0]) / 3;
               d[j] = (c[j + 1][0] - c[j][0]) / (3 * h[j]);
             }
             for (j = 0; j < n; j++) {
-              if (X[j] > value) break;
+              if (X[j] > value2) break;
             }
             j -= 1;
-            return F[j] + (value - X[j]) * b[j] + jStat3.sq(value - X[j]) * c[j] + (value - X[j]) * jStat3.sq(value - X[j]) * d[j];
+            return F[j] + (value2 - X[j]) * b[j] + jStat4.sq(value2 - X[j]) * c[j] + (value2 - X[j]) * jStat4.sq(value2 - X[j]) * d[j];
           },
           gauss_quadrature: function gauss_quadrature() {
             throw new Error("gauss_quadrature not yet implemented");
@@ -29331,7 +29331,7 @@ var require_jstat = __commonJS({
             var V = [];
             var Vt = [];
             for (i2 = 0; i2 < m; i2++) {
-              u[i2] = jStat3.sum(X[i2]) / n;
+              u[i2] = jStat4.sum(X[i2]) / n;
             }
             for (i2 = 0; i2 < n; i2++) {
               B[i2] = [];
@@ -29339,17 +29339,17 @@ var require_jstat = __commonJS({
                 B[i2][j] = X[j][i2] - u[j];
               }
             }
-            B = jStat3.transpose(B);
+            B = jStat4.transpose(B);
             for (i2 = 0; i2 < m; i2++) {
               C[i2] = [];
               for (j = 0; j < m; j++) {
-                C[i2][j] = jStat3.dot([B[i2]], [B[j]]) / (n - 1);
+                C[i2][j] = jStat4.dot([B[i2]], [B[j]]) / (n - 1);
               }
             }
-            result = jStat3.jacobi(C);
+            result = jStat4.jacobi(C);
             V = result[0];
             D = result[1];
-            Vt = jStat3.transpose(V);
+            Vt = jStat4.transpose(V);
             for (i2 = 0; i2 < D.length; i2++) {
               for (j = i2; j < D.length; j++) {
                 if (D[i2] < D[j]) {
@@ -29362,11 +29362,11 @@ var require_jstat = __commonJS({
                 }
               }
             }
-            Bt = jStat3.transpose(B);
+            Bt = jStat4.transpose(B);
             for (i2 = 0; i2 < m; i2++) {
               Y[i2] = [];
               for (j = 0; j < Bt.length; j++) {
-                Y[i2][j] = jStat3.dot([Vt[i2]], [Bt[j]]);
+                Y[i2][j] = jStat4.dot([Vt[i2]], [Bt[j]]);
               }
             }
             return [X, D, Vt, Y];
@@ -29374,27 +29374,27 @@ var require_jstat = __commonJS({
         });
         (function(funcs) {
           for (var i2 = 0; i2 < funcs.length; i2++) (function(passfunc) {
-            jStat3.fn[passfunc] = function(arg, func) {
+            jStat4.fn[passfunc] = function(arg, func) {
               var tmpthis = this;
               if (func) {
                 setTimeout(function() {
-                  func.call(tmpthis, jStat3.fn[passfunc].call(tmpthis, arg));
+                  func.call(tmpthis, jStat4.fn[passfunc].call(tmpthis, arg));
                 }, 15);
                 return this;
               }
-              if (typeof jStat3[passfunc](this, arg) === "number")
-                return jStat3[passfunc](this, arg);
+              if (typeof jStat4[passfunc](this, arg) === "number")
+                return jStat4[passfunc](this, arg);
               else
-                return jStat3(jStat3[passfunc](this, arg));
+                return jStat4(jStat4[passfunc](this, arg));
             };
           })(funcs[i2]);
         })("add divide multiply subtract dot pow exp log abs norm angle".split(" "));
-      })(jStat2, Math);
-      (function(jStat3, Math2) {
+      })(jStat3, Math);
+      (function(jStat4, Math2) {
         var slice = [].slice;
-        var isNumber = jStat3.utils.isNumber;
-        var isArray = jStat3.utils.isArray;
-        jStat3.extend({
+        var isNumber = jStat4.utils.isNumber;
+        var isArray = jStat4.utils.isArray;
+        jStat4.extend({
           // 2 different parameter lists:
           // (value, mean, sd)
           // (value, array, flag)
@@ -29403,7 +29403,7 @@ var require_jstat = __commonJS({
             if (isNumber(args[1])) {
               return (args[0] - args[1]) / args[2];
             }
-            return (args[0] - jStat3.mean(args[1])) / jStat3.stdev(args[1], args[2]);
+            return (args[0] - jStat4.mean(args[1])) / jStat4.stdev(args[1], args[2]);
           },
           // 3 different paramter lists:
           // (value, mean, sd, sides)
@@ -29413,35 +29413,35 @@ var require_jstat = __commonJS({
             var args = slice.call(arguments);
             var z;
             if (isArray(args[1])) {
-              z = jStat3.zscore(args[0], args[1], args[3]);
-              return args[2] === 1 ? jStat3.normal.cdf(-Math2.abs(z), 0, 1) : jStat3.normal.cdf(-Math2.abs(z), 0, 1) * 2;
+              z = jStat4.zscore(args[0], args[1], args[3]);
+              return args[2] === 1 ? jStat4.normal.cdf(-Math2.abs(z), 0, 1) : jStat4.normal.cdf(-Math2.abs(z), 0, 1) * 2;
             } else {
               if (args.length > 2) {
-                z = jStat3.zscore(args[0], args[1], args[2]);
-                return args[3] === 1 ? jStat3.normal.cdf(-Math2.abs(z), 0, 1) : jStat3.normal.cdf(-Math2.abs(z), 0, 1) * 2;
+                z = jStat4.zscore(args[0], args[1], args[2]);
+                return args[3] === 1 ? jStat4.normal.cdf(-Math2.abs(z), 0, 1) : jStat4.normal.cdf(-Math2.abs(z), 0, 1) * 2;
               } else {
                 z = args[0];
-                return args[1] === 1 ? jStat3.normal.cdf(-Math2.abs(z), 0, 1) : jStat3.normal.cdf(-Math2.abs(z), 0, 1) * 2;
+                return args[1] === 1 ? jStat4.normal.cdf(-Math2.abs(z), 0, 1) : jStat4.normal.cdf(-Math2.abs(z), 0, 1) * 2;
               }
             }
           }
         });
-        jStat3.extend(jStat3.fn, {
-          zscore: function zscore(value, flag) {
-            return (value - this.mean()) / this.stdev(flag);
+        jStat4.extend(jStat4.fn, {
+          zscore: function zscore(value2, flag) {
+            return (value2 - this.mean()) / this.stdev(flag);
           },
-          ztest: function ztest(value, sides, flag) {
-            var zscore = Math2.abs(this.zscore(value, flag));
-            return sides === 1 ? jStat3.normal.cdf(-zscore, 0, 1) : jStat3.normal.cdf(-zscore, 0, 1) * 2;
+          ztest: function ztest(value2, sides, flag) {
+            var zscore = Math2.abs(this.zscore(value2, flag));
+            return sides === 1 ? jStat4.normal.cdf(-zscore, 0, 1) : jStat4.normal.cdf(-zscore, 0, 1) * 2;
           }
         });
-        jStat3.extend({
+        jStat4.extend({
           // 2 parameter lists
           // (value, mean, sd, n)
           // (value, array)
           tscore: function tscore() {
             var args = slice.call(arguments);
-            return args.length === 4 ? (args[0] - args[1]) / (args[2] / Math2.sqrt(args[3])) : (args[0] - jStat3.mean(args[1])) / (jStat3.stdev(args[1], true) / Math2.sqrt(args[1].length));
+            return args.length === 4 ? (args[0] - args[1]) / (args[2] / Math2.sqrt(args[3])) : (args[0] - jStat4.mean(args[1])) / (jStat4.stdev(args[1], true) / Math2.sqrt(args[1].length));
           },
           // 3 different paramter lists:
           // (value, mean, sd, n, sides)
@@ -29451,26 +29451,26 @@ var require_jstat = __commonJS({
             var args = slice.call(arguments);
             var tscore;
             if (args.length === 5) {
-              tscore = Math2.abs(jStat3.tscore(args[0], args[1], args[2], args[3]));
-              return args[4] === 1 ? jStat3.studentt.cdf(-tscore, args[3] - 1) : jStat3.studentt.cdf(-tscore, args[3] - 1) * 2;
+              tscore = Math2.abs(jStat4.tscore(args[0], args[1], args[2], args[3]));
+              return args[4] === 1 ? jStat4.studentt.cdf(-tscore, args[3] - 1) : jStat4.studentt.cdf(-tscore, args[3] - 1) * 2;
             }
             if (isNumber(args[1])) {
               tscore = Math2.abs(args[0]);
-              return args[2] == 1 ? jStat3.studentt.cdf(-tscore, args[1] - 1) : jStat3.studentt.cdf(-tscore, args[1] - 1) * 2;
+              return args[2] == 1 ? jStat4.studentt.cdf(-tscore, args[1] - 1) : jStat4.studentt.cdf(-tscore, args[1] - 1) * 2;
             }
-            tscore = Math2.abs(jStat3.tscore(args[0], args[1]));
-            return args[2] == 1 ? jStat3.studentt.cdf(-tscore, args[1].length - 1) : jStat3.studentt.cdf(-tscore, args[1].length - 1) * 2;
+            tscore = Math2.abs(jStat4.tscore(args[0], args[1]));
+            return args[2] == 1 ? jStat4.studentt.cdf(-tscore, args[1].length - 1) : jStat4.studentt.cdf(-tscore, args[1].length - 1) * 2;
           }
         });
-        jStat3.extend(jStat3.fn, {
-          tscore: function tscore(value) {
-            return (value - this.mean()) / (this.stdev(true) / Math2.sqrt(this.cols()));
+        jStat4.extend(jStat4.fn, {
+          tscore: function tscore(value2) {
+            return (value2 - this.mean()) / (this.stdev(true) / Math2.sqrt(this.cols()));
           },
-          ttest: function ttest(value, sides) {
-            return sides === 1 ? 1 - jStat3.studentt.cdf(Math2.abs(this.tscore(value)), this.cols() - 1) : jStat3.studentt.cdf(-Math2.abs(this.tscore(value)), this.cols() - 1) * 2;
+          ttest: function ttest(value2, sides) {
+            return sides === 1 ? 1 - jStat4.studentt.cdf(Math2.abs(this.tscore(value2)), this.cols() - 1) : jStat4.studentt.cdf(-Math2.abs(this.tscore(value2)), this.cols() - 1) * 2;
           }
         });
-        jStat3.extend({
+        jStat4.extend({
           // Paramter list is as follows:
           // (array1, array2, array3, ...)
           // or it is an array of arrays
@@ -29488,15 +29488,15 @@ var require_jstat = __commonJS({
             for (i2 = 0; i2 < args.length; i2++) {
               sample = sample.concat(args[i2]);
             }
-            sampMean = jStat3.mean(sample);
+            sampMean = jStat4.mean(sample);
             expVar = 0;
             for (i2 = 0; i2 < args.length; i2++) {
-              expVar = expVar + args[i2].length * Math2.pow(jStat3.mean(args[i2]) - sampMean, 2);
+              expVar = expVar + args[i2].length * Math2.pow(jStat4.mean(args[i2]) - sampMean, 2);
             }
             expVar /= args.length - 1;
             unexpVar = 0;
             for (i2 = 0; i2 < args.length; i2++) {
-              sampSampMean = jStat3.mean(args[i2]);
+              sampSampMean = jStat4.mean(args[i2]);
               for (j = 0; j < args[i2].length; j++) {
                 unexpVar += Math2.pow(args[i2][j] - sampSampMean, 2);
               }
@@ -29510,24 +29510,24 @@ var require_jstat = __commonJS({
           anovaftest: function anovaftest() {
             var args = slice.call(arguments), df1, df2, n, i2;
             if (isNumber(args[0])) {
-              return 1 - jStat3.centralF.cdf(args[0], args[1], args[2]);
+              return 1 - jStat4.centralF.cdf(args[0], args[1], args[2]);
             }
-            var anovafscore = jStat3.anovafscore(args);
+            var anovafscore = jStat4.anovafscore(args);
             df1 = args.length - 1;
             n = 0;
             for (i2 = 0; i2 < args.length; i2++) {
               n = n + args[i2].length;
             }
             df2 = n - df1 - 1;
-            return 1 - jStat3.centralF.cdf(anovafscore, df1, df2);
+            return 1 - jStat4.centralF.cdf(anovafscore, df1, df2);
           },
           ftest: function ftest(fscore, df1, df2) {
-            return 1 - jStat3.centralF.cdf(fscore, df1, df2);
+            return 1 - jStat4.centralF.cdf(fscore, df1, df2);
           }
         });
-        jStat3.extend(jStat3.fn, {
+        jStat4.extend(jStat4.fn, {
           anovafscore: function anovafscore() {
-            return jStat3.anovafscore(this.toArray());
+            return jStat4.anovafscore(this.toArray());
           },
           anovaftes: function anovaftes() {
             var n = 0;
@@ -29535,10 +29535,10 @@ var require_jstat = __commonJS({
             for (i2 = 0; i2 < this.length; i2++) {
               n = n + this[i2].length;
             }
-            return jStat3.ftest(this.anovafscore(), this.length - 1, n - this.length);
+            return jStat4.ftest(this.anovafscore(), this.length - 1, n - this.length);
           }
         });
-        jStat3.extend({
+        jStat4.extend({
           // 2 parameter lists
           // (mean1, mean2, n1, n2, sd)
           // (array1, array2, sd)
@@ -29552,8 +29552,8 @@ var require_jstat = __commonJS({
               n2 = args[3];
               sd = args[4];
             } else {
-              mean1 = jStat3.mean(args[0]);
-              mean2 = jStat3.mean(args[1]);
+              mean1 = jStat4.mean(args[0]);
+              mean2 = jStat4.mean(args[1]);
               n1 = args[0].length;
               n2 = args[1].length;
               sd = args[2];
@@ -29571,20 +29571,20 @@ var require_jstat = __commonJS({
               qscore = args[0];
               args = args.slice(1);
             } else if (args.length === 7) {
-              qscore = jStat3.qscore(args[0], args[1], args[2], args[3], args[4]);
+              qscore = jStat4.qscore(args[0], args[1], args[2], args[3], args[4]);
               args = args.slice(5);
             } else {
-              qscore = jStat3.qscore(args[0], args[1], args[2]);
+              qscore = jStat4.qscore(args[0], args[1], args[2]);
               args = args.slice(3);
             }
             var n = args[0];
             var k = args[1];
-            return 1 - jStat3.tukey.cdf(qscore, k, n - k);
+            return 1 - jStat4.tukey.cdf(qscore, k, n - k);
           },
           tukeyhsd: function tukeyhsd(arrays) {
-            var sd = jStat3.pooledstdev(arrays);
+            var sd = jStat4.pooledstdev(arrays);
             var means = arrays.map(function(arr) {
-              return jStat3.mean(arr);
+              return jStat4.mean(arr);
             });
             var n = arrays.reduce(function(n2, arr) {
               return n2 + arr.length;
@@ -29592,52 +29592,52 @@ var require_jstat = __commonJS({
             var results = [];
             for (var i2 = 0; i2 < arrays.length; ++i2) {
               for (var j = i2 + 1; j < arrays.length; ++j) {
-                var p = jStat3.qtest(means[i2], means[j], arrays[i2].length, arrays[j].length, sd, n, arrays.length);
+                var p = jStat4.qtest(means[i2], means[j], arrays[i2].length, arrays[j].length, sd, n, arrays.length);
                 results.push([[i2, j], p]);
               }
             }
             return results;
           }
         });
-        jStat3.extend({
+        jStat4.extend({
           // 2 different parameter setups
           // (value, alpha, sd, n)
           // (value, alpha, array)
           normalci: function normalci() {
-            var args = slice.call(arguments), ans = new Array(2), change;
+            var args = slice.call(arguments), ans = new Array(2), change2;
             if (args.length === 4) {
-              change = Math2.abs(jStat3.normal.inv(args[1] / 2, 0, 1) * args[2] / Math2.sqrt(args[3]));
+              change2 = Math2.abs(jStat4.normal.inv(args[1] / 2, 0, 1) * args[2] / Math2.sqrt(args[3]));
             } else {
-              change = Math2.abs(jStat3.normal.inv(args[1] / 2, 0, 1) * jStat3.stdev(args[2]) / Math2.sqrt(args[2].length));
+              change2 = Math2.abs(jStat4.normal.inv(args[1] / 2, 0, 1) * jStat4.stdev(args[2]) / Math2.sqrt(args[2].length));
             }
-            ans[0] = args[0] - change;
-            ans[1] = args[0] + change;
+            ans[0] = args[0] - change2;
+            ans[1] = args[0] + change2;
             return ans;
           },
           // 2 different parameter setups
           // (value, alpha, sd, n)
           // (value, alpha, array)
           tci: function tci() {
-            var args = slice.call(arguments), ans = new Array(2), change;
+            var args = slice.call(arguments), ans = new Array(2), change2;
             if (args.length === 4) {
-              change = Math2.abs(jStat3.studentt.inv(args[1] / 2, args[3] - 1) * args[2] / Math2.sqrt(args[3]));
+              change2 = Math2.abs(jStat4.studentt.inv(args[1] / 2, args[3] - 1) * args[2] / Math2.sqrt(args[3]));
             } else {
-              change = Math2.abs(jStat3.studentt.inv(args[1] / 2, args[2].length - 1) * jStat3.stdev(args[2], true) / Math2.sqrt(args[2].length));
+              change2 = Math2.abs(jStat4.studentt.inv(args[1] / 2, args[2].length - 1) * jStat4.stdev(args[2], true) / Math2.sqrt(args[2].length));
             }
-            ans[0] = args[0] - change;
-            ans[1] = args[0] + change;
+            ans[0] = args[0] - change2;
+            ans[1] = args[0] + change2;
             return ans;
           },
           significant: function significant(pvalue, alpha) {
             return pvalue < alpha;
           }
         });
-        jStat3.extend(jStat3.fn, {
-          normalci: function normalci(value, alpha) {
-            return jStat3.normalci(value, alpha, this.toArray());
+        jStat4.extend(jStat4.fn, {
+          normalci: function normalci(value2, alpha) {
+            return jStat4.normalci(value2, alpha, this.toArray());
           },
-          tci: function tci(value, alpha) {
-            return jStat3.tci(value, alpha, this.toArray());
+          tci: function tci(value2, alpha) {
+            return jStat4.tci(value2, alpha, this.toArray());
           }
         });
         function differenceOfProportions(p1, n1, p2, n2) {
@@ -29648,29 +29648,29 @@ var require_jstat = __commonJS({
           var se = Math2.sqrt(pooled * (1 - pooled) * (1 / n1 + 1 / n2));
           return (p1 - p2) / se;
         }
-        jStat3.extend(jStat3.fn, {
+        jStat4.extend(jStat4.fn, {
           oneSidedDifferenceOfProportions: function oneSidedDifferenceOfProportions(p1, n1, p2, n2) {
             var z = differenceOfProportions(p1, n1, p2, n2);
-            return jStat3.ztest(z, 1);
+            return jStat4.ztest(z, 1);
           },
           twoSidedDifferenceOfProportions: function twoSidedDifferenceOfProportions(p1, n1, p2, n2) {
             var z = differenceOfProportions(p1, n1, p2, n2);
-            return jStat3.ztest(z, 2);
+            return jStat4.ztest(z, 2);
           }
         });
-      })(jStat2, Math);
-      jStat2.models = /* @__PURE__ */ (function() {
+      })(jStat3, Math);
+      jStat3.models = /* @__PURE__ */ (function() {
         function sub_regress(exog) {
           var var_count = exog[0].length;
-          var modelList = jStat2.arange(var_count).map(function(endog_index) {
-            var exog_index = jStat2.arange(var_count).filter(function(i2) {
+          var modelList = jStat3.arange(var_count).map(function(endog_index) {
+            var exog_index = jStat3.arange(var_count).filter(function(i2) {
               return i2 !== endog_index;
             });
             return ols(
-              jStat2.col(exog, endog_index).map(function(x2) {
+              jStat3.col(exog, endog_index).map(function(x2) {
                 return x2[0];
               }),
-              jStat2.col(exog, exog_index)
+              jStat3.col(exog, exog_index)
             );
           });
           return modelList;
@@ -29679,18 +29679,18 @@ var require_jstat = __commonJS({
           var nobs = endog.length;
           var df_model = exog[0].length - 1;
           var df_resid = nobs - df_model - 1;
-          var coef = jStat2.lstsq(exog, endog);
-          var predict = jStat2.multiply(exog, coef.map(function(x2) {
+          var coef = jStat3.lstsq(exog, endog);
+          var predict = jStat3.multiply(exog, coef.map(function(x2) {
             return [x2];
           })).map(function(p) {
             return p[0];
           });
-          var resid = jStat2.subtract(endog, predict);
-          var ybar = jStat2.mean(endog);
-          var SSE = jStat2.sum(predict.map(function(f) {
+          var resid = jStat3.subtract(endog, predict);
+          var ybar = jStat3.mean(endog);
+          var SSE = jStat3.sum(predict.map(function(f) {
             return Math.pow(f - ybar, 2);
           }));
-          var SSR = jStat2.sum(endog.map(function(y, i2) {
+          var SSR = jStat3.sum(endog.map(function(y, i2) {
             return Math.pow(y - predict[i2], 2);
           }));
           var SST = SSE + SSR;
@@ -29722,11 +29722,11 @@ var require_jstat = __commonJS({
           var tStatistic = model.coef.map(function(coef, i2) {
             return (coef - 0) / seBetaHat[i2];
           });
-          var pValue2 = tStatistic.map(function(t) {
-            var leftppf = jStat2.studentt.cdf(t, model.df_resid);
+          var pValue = tStatistic.map(function(t) {
+            var leftppf = jStat3.studentt.cdf(t, model.df_resid);
             return (leftppf > 0.5 ? 1 - leftppf : leftppf) * 2;
           });
-          var c = jStat2.studentt.inv(0.975, model.df_resid);
+          var c = jStat3.studentt.inv(0.975, model.df_resid);
           var interval95 = model.coef.map(function(coef, i2) {
             var d = c * seBetaHat[i2];
             return [coef - d, coef + d];
@@ -29734,7 +29734,7 @@ var require_jstat = __commonJS({
           return {
             se: seBetaHat,
             t: tStatistic,
-            p: pValue2,
+            p: pValue,
             sigmaHat,
             interval95
           };
@@ -29742,7 +29742,7 @@ var require_jstat = __commonJS({
         function F_test(model) {
           var F_statistic = model.R2 / model.df_model / ((1 - model.R2) / model.df_resid);
           var fcdf = function(x2, n1, n2) {
-            return jStat2.beta.cdf(x2 / (n2 / n1 + x2), n1 / 2, n2 / 2);
+            return jStat3.beta.cdf(x2 / (n2 / n1 + x2), n1 / 2, n2 / 2);
           };
           var pvalue = 1 - fcdf(F_statistic, model.df_model, model.df_resid);
           return { F_statistic, pvalue };
@@ -29759,14 +29759,14 @@ var require_jstat = __commonJS({
         }
         return { ols: ols_wrap };
       })();
-      jStat2.extend({
+      jStat3.extend({
         buildxmatrix: function buildxmatrix() {
           var matrixRows = new Array(arguments.length);
           for (var i2 = 0; i2 < arguments.length; i2++) {
             var array = [1];
             matrixRows[i2] = array.concat(arguments[i2]);
           }
-          return jStat2(matrixRows);
+          return jStat3(matrixRows);
         },
         builddxmatrix: function builddxmatrix() {
           var matrixRows = new Array(arguments[0].length);
@@ -29774,17 +29774,17 @@ var require_jstat = __commonJS({
             var array = [1];
             matrixRows[i2] = array.concat(arguments[0][i2]);
           }
-          return jStat2(matrixRows);
+          return jStat3(matrixRows);
         },
         buildjxmatrix: function buildjxmatrix(jMat) {
           var pass = new Array(jMat.length);
           for (var i2 = 0; i2 < jMat.length; i2++) {
             pass[i2] = jMat[i2];
           }
-          return jStat2.builddxmatrix(pass);
+          return jStat3.builddxmatrix(pass);
         },
         buildymatrix: function buildymatrix(array) {
-          return jStat2(array).transpose();
+          return jStat3(array).transpose();
         },
         buildjymatrix: function buildjymatrix(jMat) {
           return jMat.transpose();
@@ -29804,7 +29804,7 @@ var require_jstat = __commonJS({
                   result[i2][j] = sum;
                 }
               }
-              return jStat2(result);
+              return jStat3(result);
             }
             result = [];
             for (i2 = 0; i2 < A.rows(); i2++) {
@@ -29817,34 +29817,34 @@ var require_jstat = __commonJS({
                 result[i2][j] = sum;
               }
             }
-            return jStat2(result);
+            return jStat3(result);
           }
         },
         //regress and regresst to be fixed
         regress: function regress(jMatX, jMatY) {
-          var innerinv = jStat2.xtranspxinv(jMatX);
+          var innerinv = jStat3.xtranspxinv(jMatX);
           var xtransp = jMatX.transpose();
-          var next = jStat2.matrixmult(jStat2(innerinv), xtransp);
-          return jStat2.matrixmult(next, jMatY);
+          var next = jStat3.matrixmult(jStat3(innerinv), xtransp);
+          return jStat3.matrixmult(next, jMatY);
         },
         regresst: function regresst(jMatX, jMatY, sides) {
-          var beta = jStat2.regress(jMatX, jMatY);
+          var beta = jStat3.regress(jMatX, jMatY);
           var compile = {};
           compile.anova = {};
-          var jMatYBar = jStat2.jMatYBar(jMatX, beta);
+          var jMatYBar = jStat3.jMatYBar(jMatX, beta);
           compile.yBar = jMatYBar;
           var yAverage = jMatY.mean();
-          compile.anova.residuals = jStat2.residuals(jMatY, jMatYBar);
-          compile.anova.ssr = jStat2.ssr(jMatYBar, yAverage);
+          compile.anova.residuals = jStat3.residuals(jMatY, jMatYBar);
+          compile.anova.ssr = jStat3.ssr(jMatYBar, yAverage);
           compile.anova.msr = compile.anova.ssr / (jMatX[0].length - 1);
-          compile.anova.sse = jStat2.sse(jMatY, jMatYBar);
+          compile.anova.sse = jStat3.sse(jMatY, jMatYBar);
           compile.anova.mse = compile.anova.sse / (jMatY.length - (jMatX[0].length - 1) - 1);
-          compile.anova.sst = jStat2.sst(jMatY, yAverage);
+          compile.anova.sst = jStat3.sst(jMatY, yAverage);
           compile.anova.mst = compile.anova.sst / (jMatY.length - 1);
           compile.anova.r2 = 1 - compile.anova.sse / compile.anova.sst;
           if (compile.anova.r2 < 0) compile.anova.r2 = 0;
           compile.anova.fratio = compile.anova.msr / compile.anova.mse;
-          compile.anova.pvalue = jStat2.anovaftest(
+          compile.anova.pvalue = jStat3.anovaftest(
             compile.anova.fratio,
             jMatX[0].length - 1,
             jMatY.length - (jMatX[0].length - 1) - 1
@@ -29853,31 +29853,31 @@ var require_jstat = __commonJS({
           compile.anova.r2adj = 1 - compile.anova.mse / compile.anova.mst;
           if (compile.anova.r2adj < 0) compile.anova.r2adj = 0;
           compile.stats = new Array(jMatX[0].length);
-          var covar = jStat2.xtranspxinv(jMatX);
+          var covar = jStat3.xtranspxinv(jMatX);
           var sds, ts, ps;
           for (var i2 = 0; i2 < beta.length; i2++) {
             sds = Math.sqrt(compile.anova.mse * Math.abs(covar[i2][i2]));
             ts = Math.abs(beta[i2] / sds);
-            ps = jStat2.ttest(ts, jMatY.length - jMatX[0].length - 1, sides);
+            ps = jStat3.ttest(ts, jMatY.length - jMatX[0].length - 1, sides);
             compile.stats[i2] = [beta[i2], sds, ts, ps];
           }
           compile.regress = beta;
           return compile;
         },
         xtranspx: function xtranspx(jMatX) {
-          return jStat2.matrixmult(jMatX.transpose(), jMatX);
+          return jStat3.matrixmult(jMatX.transpose(), jMatX);
         },
         xtranspxinv: function xtranspxinv(jMatX) {
-          var inner = jStat2.matrixmult(jMatX.transpose(), jMatX);
-          var innerinv = jStat2.inv(inner);
+          var inner = jStat3.matrixmult(jMatX.transpose(), jMatX);
+          var innerinv = jStat3.inv(inner);
           return innerinv;
         },
         jMatYBar: function jMatYBar(jMatX, beta) {
-          var yBar = jStat2.matrixmult(jMatX, beta);
-          return new jStat2(yBar);
+          var yBar = jStat3.matrixmult(jMatX, beta);
+          return new jStat3(yBar);
         },
         residuals: function residuals(jMatY, jMatYBar) {
-          return jStat2.matrixsubtract(jMatY, jMatYBar);
+          return jStat3.matrixsubtract(jMatY, jMatYBar);
         },
         ssr: function ssr(jMatYBar, yAverage) {
           var ssr2 = 0;
@@ -29908,11 +29908,11 @@ var require_jstat = __commonJS({
               ans[i2][j] = A[i2][j] - B[i2][j];
             }
           }
-          return jStat2(ans);
+          return jStat3(ans);
         }
       });
-      jStat2.jStat = jStat2;
-      return jStat2;
+      jStat3.jStat = jStat3;
+      return jStat3;
     });
   }
 });
@@ -30921,11 +30921,11 @@ var require_formats = __commonJS({
     }
     var MIN_INT32 = -(2 ** 31);
     var MAX_INT32 = 2 ** 31 - 1;
-    function validateInt32(value) {
-      return Number.isInteger(value) && value <= MAX_INT32 && value >= MIN_INT32;
+    function validateInt32(value2) {
+      return Number.isInteger(value2) && value2 <= MAX_INT32 && value2 >= MIN_INT32;
     }
-    function validateInt64(value) {
-      return Number.isInteger(value);
+    function validateInt64(value2) {
+      return Number.isInteger(value2);
     }
     function validateNumber() {
       return true;
@@ -31569,26 +31569,26 @@ var require_toJS = __commonJS({
   "node_modules/yaml/dist/nodes/toJS.js"(exports) {
     "use strict";
     var identity = require_identity();
-    function toJS(value, arg, ctx) {
-      if (Array.isArray(value))
-        return value.map((v, i2) => toJS(v, String(i2), ctx));
-      if (value && typeof value.toJSON === "function") {
-        if (!ctx || !identity.hasAnchor(value))
-          return value.toJSON(arg, ctx);
+    function toJS(value2, arg, ctx) {
+      if (Array.isArray(value2))
+        return value2.map((v, i2) => toJS(v, String(i2), ctx));
+      if (value2 && typeof value2.toJSON === "function") {
+        if (!ctx || !identity.hasAnchor(value2))
+          return value2.toJSON(arg, ctx);
         const data = { aliasCount: 0, count: 1, res: void 0 };
-        ctx.anchors.set(value, data);
+        ctx.anchors.set(value2, data);
         ctx.onCreate = (res2) => {
           data.res = res2;
           delete ctx.onCreate;
         };
-        const res = value.toJSON(arg, ctx);
+        const res = value2.toJSON(arg, ctx);
         if (ctx.onCreate)
           ctx.onCreate(res);
         return res;
       }
-      if (typeof value === "bigint" && !ctx?.keep)
-        return Number(value);
-      return value;
+      if (typeof value2 === "bigint" && !ctx?.keep)
+        return Number(value2);
+      return value2;
     }
     exports.toJS = toJS;
   }
@@ -31760,11 +31760,11 @@ var require_Scalar = __commonJS({
     var identity = require_identity();
     var Node = require_Node();
     var toJS = require_toJS();
-    var isScalarValue = (value) => !value || typeof value !== "function" && typeof value !== "object";
+    var isScalarValue = (value2) => !value2 || typeof value2 !== "function" && typeof value2 !== "object";
     var Scalar = class extends Node.NodeBase {
-      constructor(value) {
+      constructor(value2) {
         super(identity.SCALAR);
-        this.value = value;
+        this.value = value2;
       }
       toJSON(arg, ctx) {
         return ctx?.keep ? this.value : toJS.toJS(this.value, arg, ctx);
@@ -31791,7 +31791,7 @@ var require_createNode = __commonJS({
     var identity = require_identity();
     var Scalar = require_Scalar();
     var defaultTagPrefix = "tag:yaml.org,2002:";
-    function findTagObject(value, tagName, tags) {
+    function findTagObject(value2, tagName, tags) {
       if (tagName) {
         const match = tags.filter((t) => t.tag === tagName);
         const tagObj = match.find((t) => !t.format) ?? match[0];
@@ -31799,53 +31799,53 @@ var require_createNode = __commonJS({
           throw new Error(`Tag ${tagName} not found`);
         return tagObj;
       }
-      return tags.find((t) => t.identify?.(value) && !t.format);
+      return tags.find((t) => t.identify?.(value2) && !t.format);
     }
-    function createNode(value, tagName, ctx) {
-      if (identity.isDocument(value))
-        value = value.contents;
-      if (identity.isNode(value))
-        return value;
-      if (identity.isPair(value)) {
+    function createNode(value2, tagName, ctx) {
+      if (identity.isDocument(value2))
+        value2 = value2.contents;
+      if (identity.isNode(value2))
+        return value2;
+      if (identity.isPair(value2)) {
         const map = ctx.schema[identity.MAP].createNode?.(ctx.schema, null, ctx);
-        map.items.push(value);
+        map.items.push(value2);
         return map;
       }
-      if (value instanceof String || value instanceof Number || value instanceof Boolean || typeof BigInt !== "undefined" && value instanceof BigInt) {
-        value = value.valueOf();
+      if (value2 instanceof String || value2 instanceof Number || value2 instanceof Boolean || typeof BigInt !== "undefined" && value2 instanceof BigInt) {
+        value2 = value2.valueOf();
       }
       const { aliasDuplicateObjects, onAnchor, onTagObj, schema, sourceObjects } = ctx;
       let ref = void 0;
-      if (aliasDuplicateObjects && value && typeof value === "object") {
-        ref = sourceObjects.get(value);
+      if (aliasDuplicateObjects && value2 && typeof value2 === "object") {
+        ref = sourceObjects.get(value2);
         if (ref) {
-          ref.anchor ?? (ref.anchor = onAnchor(value));
+          ref.anchor ?? (ref.anchor = onAnchor(value2));
           return new Alias.Alias(ref.anchor);
         } else {
           ref = { anchor: null, node: null };
-          sourceObjects.set(value, ref);
+          sourceObjects.set(value2, ref);
         }
       }
       if (tagName?.startsWith("!!"))
         tagName = defaultTagPrefix + tagName.slice(2);
-      let tagObj = findTagObject(value, tagName, schema.tags);
+      let tagObj = findTagObject(value2, tagName, schema.tags);
       if (!tagObj) {
-        if (value && typeof value.toJSON === "function") {
-          value = value.toJSON();
+        if (value2 && typeof value2.toJSON === "function") {
+          value2 = value2.toJSON();
         }
-        if (!value || typeof value !== "object") {
-          const node2 = new Scalar.Scalar(value);
+        if (!value2 || typeof value2 !== "object") {
+          const node2 = new Scalar.Scalar(value2);
           if (ref)
             ref.node = node2;
           return node2;
         }
-        tagObj = value instanceof Map ? schema[identity.MAP] : Symbol.iterator in Object(value) ? schema[identity.SEQ] : schema[identity.MAP];
+        tagObj = value2 instanceof Map ? schema[identity.MAP] : Symbol.iterator in Object(value2) ? schema[identity.SEQ] : schema[identity.MAP];
       }
       if (onTagObj) {
         onTagObj(tagObj);
         delete ctx.onTagObj;
       }
-      const node = tagObj?.createNode ? tagObj.createNode(ctx.schema, value, ctx) : typeof tagObj?.nodeClass?.from === "function" ? tagObj.nodeClass.from(ctx.schema, value, ctx) : new Scalar.Scalar(value);
+      const node = tagObj?.createNode ? tagObj.createNode(ctx.schema, value2, ctx) : typeof tagObj?.nodeClass?.from === "function" ? tagObj.nodeClass.from(ctx.schema, value2, ctx) : new Scalar.Scalar(value2);
       if (tagName)
         node.tag = tagName;
       else if (!tagObj.default)
@@ -31865,8 +31865,8 @@ var require_Collection = __commonJS({
     var createNode = require_createNode();
     var identity = require_identity();
     var Node = require_Node();
-    function collectionFromPath(schema, path, value) {
-      let v = value;
+    function collectionFromPath(schema, path, value2) {
+      let v = value2;
       for (let i2 = path.length - 1; i2 >= 0; --i2) {
         const k = path[i2];
         if (typeof k === "number" && Number.isInteger(k) && k >= 0) {
@@ -31917,16 +31917,16 @@ var require_Collection = __commonJS({
        * be a Pair instance or a `{ key, value }` object, which may not have a key
        * that already exists in the map.
        */
-      addIn(path, value) {
+      addIn(path, value2) {
         if (isEmptyPath(path))
-          this.add(value);
+          this.add(value2);
         else {
           const [key, ...rest] = path;
           const node = this.get(key, true);
           if (identity.isCollection(node))
-            node.addIn(rest, value);
+            node.addIn(rest, value2);
           else if (node === void 0 && this.schema)
-            this.set(key, collectionFromPath(this.schema, rest, value));
+            this.set(key, collectionFromPath(this.schema, rest, value2));
           else
             throw new Error(`Expected YAML collection at ${key}. Remaining path: ${rest}`);
         }
@@ -31980,16 +31980,16 @@ var require_Collection = __commonJS({
        * Sets a value in this collection. For `!!set`, `value` needs to be a
        * boolean to add/remove the item from the set.
        */
-      setIn(path, value) {
+      setIn(path, value2) {
         const [key, ...rest] = path;
         if (rest.length === 0) {
-          this.set(key, value);
+          this.set(key, value2);
         } else {
           const node = this.get(key, true);
           if (identity.isCollection(node))
-            node.setIn(rest, value);
+            node.setIn(rest, value2);
           else if (node === void 0 && this.schema)
-            this.set(key, collectionFromPath(this.schema, rest, value));
+            this.set(key, collectionFromPath(this.schema, rest, value2));
           else
             throw new Error(`Expected YAML collection at ${key}. Remaining path: ${rest}`);
         }
@@ -32184,13 +32184,13 @@ var require_stringifyString = __commonJS({
       }
       return true;
     }
-    function doubleQuotedString(value, ctx) {
-      const json = JSON.stringify(value);
+    function doubleQuotedString(value2, ctx) {
+      const json = JSON.stringify(value2);
       if (ctx.options.doubleQuotedAsJSON)
         return json;
       const { implicitKey } = ctx;
       const minMultiLineLength = ctx.options.doubleQuotedMinMultiLineLength;
-      const indent = ctx.indent || (containsDocumentMarker(value) ? "  " : "");
+      const indent = ctx.indent || (containsDocumentMarker(value2) ? "  " : "");
       let str = "";
       let start = 0;
       for (let i2 = 0, ch = json[i2]; ch; ch = json[++i2]) {
@@ -32264,22 +32264,22 @@ var require_stringifyString = __commonJS({
       str = start ? str + json.slice(start) : json;
       return implicitKey ? str : foldFlowLines.foldFlowLines(str, indent, foldFlowLines.FOLD_QUOTED, getFoldOptions(ctx, false));
     }
-    function singleQuotedString(value, ctx) {
-      if (ctx.options.singleQuote === false || ctx.implicitKey && value.includes("\n") || /[ \t]\n|\n[ \t]/.test(value))
-        return doubleQuotedString(value, ctx);
-      const indent = ctx.indent || (containsDocumentMarker(value) ? "  " : "");
-      const res = "'" + value.replace(/'/g, "''").replace(/\n+/g, `$&
+    function singleQuotedString(value2, ctx) {
+      if (ctx.options.singleQuote === false || ctx.implicitKey && value2.includes("\n") || /[ \t]\n|\n[ \t]/.test(value2))
+        return doubleQuotedString(value2, ctx);
+      const indent = ctx.indent || (containsDocumentMarker(value2) ? "  " : "");
+      const res = "'" + value2.replace(/'/g, "''").replace(/\n+/g, `$&
 ${indent}`) + "'";
       return ctx.implicitKey ? res : foldFlowLines.foldFlowLines(res, indent, foldFlowLines.FOLD_FLOW, getFoldOptions(ctx, false));
     }
-    function quotedString(value, ctx) {
+    function quotedString(value2, ctx) {
       const { singleQuote } = ctx.options;
       let qs;
       if (singleQuote === false)
         qs = doubleQuotedString;
       else {
-        const hasDouble = value.includes('"');
-        const hasSingle = value.includes("'");
+        const hasDouble = value2.includes('"');
+        const hasSingle = value2.includes("'");
         if (hasDouble && !hasSingle)
           qs = singleQuotedString;
         else if (hasSingle && !hasDouble)
@@ -32287,7 +32287,7 @@ ${indent}`) + "'";
         else
           qs = singleQuote ? singleQuotedString : doubleQuotedString;
       }
-      return qs(value, ctx);
+      return qs(value2, ctx);
     }
     var blockEndNewlines;
     try {
@@ -32295,27 +32295,27 @@ ${indent}`) + "'";
     } catch {
       blockEndNewlines = /\n+(?!\n|$)/g;
     }
-    function blockString({ comment, type, value }, ctx, onComment, onChompKeep) {
+    function blockString({ comment, type, value: value2 }, ctx, onComment, onChompKeep) {
       const { blockQuote, commentString, lineWidth } = ctx.options;
-      if (!blockQuote || /\n[\t ]+$/.test(value)) {
-        return quotedString(value, ctx);
+      if (!blockQuote || /\n[\t ]+$/.test(value2)) {
+        return quotedString(value2, ctx);
       }
-      const indent = ctx.indent || (ctx.forceBlockIndent || containsDocumentMarker(value) ? "  " : "");
-      const literal = blockQuote === "literal" ? true : blockQuote === "folded" || type === Scalar.Scalar.BLOCK_FOLDED ? false : type === Scalar.Scalar.BLOCK_LITERAL ? true : !lineLengthOverLimit(value, lineWidth, indent.length);
-      if (!value)
+      const indent = ctx.indent || (ctx.forceBlockIndent || containsDocumentMarker(value2) ? "  " : "");
+      const literal = blockQuote === "literal" ? true : blockQuote === "folded" || type === Scalar.Scalar.BLOCK_FOLDED ? false : type === Scalar.Scalar.BLOCK_LITERAL ? true : !lineLengthOverLimit(value2, lineWidth, indent.length);
+      if (!value2)
         return literal ? "|\n" : ">\n";
       let chomp;
       let endStart;
-      for (endStart = value.length; endStart > 0; --endStart) {
-        const ch = value[endStart - 1];
+      for (endStart = value2.length; endStart > 0; --endStart) {
+        const ch = value2[endStart - 1];
         if (ch !== "\n" && ch !== "	" && ch !== " ")
           break;
       }
-      let end = value.substring(endStart);
+      let end = value2.substring(endStart);
       const endNlPos = end.indexOf("\n");
       if (endNlPos === -1) {
         chomp = "-";
-      } else if (value === end || endNlPos !== end.length - 1) {
+      } else if (value2 === end || endNlPos !== end.length - 1) {
         chomp = "+";
         if (onChompKeep)
           onChompKeep();
@@ -32323,7 +32323,7 @@ ${indent}`) + "'";
         chomp = "";
       }
       if (end) {
-        value = value.slice(0, -end.length);
+        value2 = value2.slice(0, -end.length);
         if (end[end.length - 1] === "\n")
           end = end.slice(0, -1);
         end = end.replace(blockEndNewlines, `$&${indent}`);
@@ -32331,8 +32331,8 @@ ${indent}`) + "'";
       let startWithSpace = false;
       let startEnd;
       let startNlPos = -1;
-      for (startEnd = 0; startEnd < value.length; ++startEnd) {
-        const ch = value[startEnd];
+      for (startEnd = 0; startEnd < value2.length; ++startEnd) {
+        const ch = value2[startEnd];
         if (ch === " ")
           startWithSpace = true;
         else if (ch === "\n")
@@ -32340,9 +32340,9 @@ ${indent}`) + "'";
         else
           break;
       }
-      let start = value.substring(0, startNlPos < startEnd ? startNlPos + 1 : startEnd);
+      let start = value2.substring(0, startNlPos < startEnd ? startNlPos + 1 : startEnd);
       if (start) {
-        value = value.substring(start.length);
+        value2 = value2.substring(start.length);
         start = start.replace(/\n+/g, `$&${indent}`);
       }
       const indentSize = indent ? "2" : "1";
@@ -32353,7 +32353,7 @@ ${indent}`) + "'";
           onComment();
       }
       if (!literal) {
-        const foldedValue = value.replace(/\n+/g, "\n$&").replace(/(?:^|\n)([\t ].*)(?:([\n\t ]*)\n(?![\n\t ]))?/g, "$1$2").replace(/\n+/g, `$&${indent}`);
+        const foldedValue = value2.replace(/\n+/g, "\n$&").replace(/(?:^|\n)([\t ].*)(?:([\n\t ]*)\n(?![\n\t ]))?/g, "$1$2").replace(/\n+/g, `$&${indent}`);
         let literalFallback = false;
         const foldOptions = getFoldOptions(ctx, true);
         if (blockQuote !== "folded" && type !== Scalar.Scalar.BLOCK_FOLDED) {
@@ -32366,37 +32366,37 @@ ${indent}`) + "'";
           return `>${header}
 ${indent}${body}`;
       }
-      value = value.replace(/\n+/g, `$&${indent}`);
+      value2 = value2.replace(/\n+/g, `$&${indent}`);
       return `|${header}
-${indent}${start}${value}${end}`;
+${indent}${start}${value2}${end}`;
     }
     function plainString(item, ctx, onComment, onChompKeep) {
-      const { type, value } = item;
+      const { type, value: value2 } = item;
       const { actualString, implicitKey, indent, indentStep, inFlow } = ctx;
-      if (implicitKey && value.includes("\n") || inFlow && /[[\]{},]/.test(value)) {
-        return quotedString(value, ctx);
+      if (implicitKey && value2.includes("\n") || inFlow && /[[\]{},]/.test(value2)) {
+        return quotedString(value2, ctx);
       }
-      if (/^[\n\t ,[\]{}#&*!|>'"%@`]|^[?-]$|^[?-][ \t]|[\n:][ \t]|[ \t]\n|[\n\t ]#|[\n\t :]$/.test(value)) {
-        return implicitKey || inFlow || !value.includes("\n") ? quotedString(value, ctx) : blockString(item, ctx, onComment, onChompKeep);
+      if (/^[\n\t ,[\]{}#&*!|>'"%@`]|^[?-]$|^[?-][ \t]|[\n:][ \t]|[ \t]\n|[\n\t ]#|[\n\t :]$/.test(value2)) {
+        return implicitKey || inFlow || !value2.includes("\n") ? quotedString(value2, ctx) : blockString(item, ctx, onComment, onChompKeep);
       }
-      if (!implicitKey && !inFlow && type !== Scalar.Scalar.PLAIN && value.includes("\n")) {
+      if (!implicitKey && !inFlow && type !== Scalar.Scalar.PLAIN && value2.includes("\n")) {
         return blockString(item, ctx, onComment, onChompKeep);
       }
-      if (containsDocumentMarker(value)) {
+      if (containsDocumentMarker(value2)) {
         if (indent === "") {
           ctx.forceBlockIndent = true;
           return blockString(item, ctx, onComment, onChompKeep);
         } else if (implicitKey && indent === indentStep) {
-          return quotedString(value, ctx);
+          return quotedString(value2, ctx);
         }
       }
-      const str = value.replace(/\n+/g, `$&
+      const str = value2.replace(/\n+/g, `$&
 ${indent}`);
       if (actualString) {
-        const test = (tag) => tag.default && tag.tag !== "tag:yaml.org,2002:str" && tag.test?.test(str);
+        const test2 = (tag) => tag.default && tag.tag !== "tag:yaml.org,2002:str" && tag.test?.test(str);
         const { compat, tags } = ctx.doc.schema;
-        if (tags.some(test) || compat?.some(test))
-          return quotedString(value, ctx);
+        if (tags.some(test2) || compat?.some(test2))
+          return quotedString(value2, ctx);
       }
       return implicitKey ? str : foldFlowLines.foldFlowLines(str, indent, foldFlowLines.FOLD_FLOW, getFoldOptions(ctx, false));
     }
@@ -32569,7 +32569,7 @@ var require_stringifyPair = __commonJS({
     var Scalar = require_Scalar();
     var stringify = require_stringify();
     var stringifyComment = require_stringifyComment();
-    function stringifyPair({ key, value }, ctx, onComment, onChompKeep) {
+    function stringifyPair({ key, value: value2 }, ctx, onComment, onChompKeep) {
       const { allNullValues, doc, indent, indentStep, options: { commentString, indentSeq, simpleKeys } } = ctx;
       let keyComment = identity.isNode(key) && key.comment || null;
       if (simpleKeys) {
@@ -32581,7 +32581,7 @@ var require_stringifyPair = __commonJS({
           throw new Error(msg);
         }
       }
-      let explicitKey = !simpleKeys && (!key || keyComment && value == null && !ctx.inFlow || identity.isCollection(key) || (identity.isScalar(key) ? key.type === Scalar.Scalar.BLOCK_FOLDED || key.type === Scalar.Scalar.BLOCK_LITERAL : typeof key === "object"));
+      let explicitKey = !simpleKeys && (!key || keyComment && value2 == null && !ctx.inFlow || identity.isCollection(key) || (identity.isScalar(key) ? key.type === Scalar.Scalar.BLOCK_FOLDED || key.type === Scalar.Scalar.BLOCK_LITERAL : typeof key === "object"));
       ctx = Object.assign({}, ctx, {
         allNullValues: false,
         implicitKey: !explicitKey && (simpleKeys || !allNullValues),
@@ -32596,12 +32596,12 @@ var require_stringifyPair = __commonJS({
         explicitKey = true;
       }
       if (ctx.inFlow) {
-        if (allNullValues || value == null) {
+        if (allNullValues || value2 == null) {
           if (keyCommentDone && onComment)
             onComment();
           return str === "" ? "?" : explicitKey ? `? ${str}` : str;
         }
-      } else if (allNullValues && !simpleKeys || value == null && explicitKey) {
+      } else if (allNullValues && !simpleKeys || value2 == null && explicitKey) {
         str = `? ${str}`;
         if (keyComment && !keyCommentDone) {
           str += stringifyComment.lineComment(str, ctx.indent, commentString(keyComment));
@@ -32622,26 +32622,26 @@ ${indent}:`;
           str += stringifyComment.lineComment(str, ctx.indent, commentString(keyComment));
       }
       let vsb, vcb, valueComment;
-      if (identity.isNode(value)) {
-        vsb = !!value.spaceBefore;
-        vcb = value.commentBefore;
-        valueComment = value.comment;
+      if (identity.isNode(value2)) {
+        vsb = !!value2.spaceBefore;
+        vcb = value2.commentBefore;
+        valueComment = value2.comment;
       } else {
         vsb = false;
         vcb = null;
         valueComment = null;
-        if (value && typeof value === "object")
-          value = doc.createNode(value);
+        if (value2 && typeof value2 === "object")
+          value2 = doc.createNode(value2);
       }
       ctx.implicitKey = false;
-      if (!explicitKey && !keyComment && identity.isScalar(value))
+      if (!explicitKey && !keyComment && identity.isScalar(value2))
         ctx.indentAtStart = str.length + 1;
       chompKeep = false;
-      if (!indentSeq && indentStep.length >= 2 && !ctx.inFlow && !explicitKey && identity.isSeq(value) && !value.flow && !value.tag && !value.anchor) {
+      if (!indentSeq && indentStep.length >= 2 && !ctx.inFlow && !explicitKey && identity.isSeq(value2) && !value2.flow && !value2.tag && !value2.anchor) {
         ctx.indent = ctx.indent.substring(2);
       }
       let valueCommentDone = false;
-      const valueStr = stringify.stringify(value, ctx, () => valueCommentDone = true, () => chompKeep = true);
+      const valueStr = stringify.stringify(value2, ctx, () => valueCommentDone = true, () => chompKeep = true);
       let ws = " ";
       if (keyComment || vsb || vcb) {
         ws = vsb ? "\n" : "";
@@ -32657,11 +32657,11 @@ ${stringifyComment.indentComment(cs, ctx.indent)}`;
           ws += `
 ${ctx.indent}`;
         }
-      } else if (!explicitKey && identity.isCollection(value)) {
+      } else if (!explicitKey && identity.isCollection(value2)) {
         const vs0 = valueStr[0];
         const nl0 = valueStr.indexOf("\n");
         const hasNewline = nl0 !== -1;
-        const flow = ctx.inFlow ?? value.flow ?? value.items.length === 0;
+        const flow = ctx.inFlow ?? value2.flow ?? value2.items.length === 0;
         if (hasNewline || !flow) {
           let hasPropsLine = false;
           if (hasNewline && (vs0 === "&" || vs0 === "!")) {
@@ -32724,7 +32724,7 @@ var require_merge = __commonJS({
     var Scalar = require_Scalar();
     var MERGE_KEY = "<<";
     var merge2 = {
-      identify: (value) => value === MERGE_KEY || typeof value === "symbol" && value.description === MERGE_KEY,
+      identify: (value2) => value2 === MERGE_KEY || typeof value2 === "symbol" && value2.description === MERGE_KEY,
       default: "key",
       tag: "tag:yaml.org,2002:merge",
       test: /^<<$/,
@@ -32734,8 +32734,8 @@ var require_merge = __commonJS({
       stringify: () => MERGE_KEY
     };
     var isMergeKey = (ctx, key) => (merge2.identify(key) || identity.isScalar(key) && (!key.type || key.type === Scalar.Scalar.PLAIN) && merge2.identify(key.value)) && ctx?.doc.schema.tags.some((tag) => tag.tag === merge2.tag && tag.default);
-    function addMergeToJSMap(ctx, map, value) {
-      const source = resolveAliasValue(ctx, value);
+    function addMergeToJSMap(ctx, map, value2) {
+      const source = resolveAliasValue(ctx, value2);
       if (identity.isSeq(source))
         for (const it of source.items)
           mergeValue(ctx, map, it);
@@ -32745,20 +32745,20 @@ var require_merge = __commonJS({
       else
         mergeValue(ctx, map, source);
     }
-    function mergeValue(ctx, map, value) {
-      const source = resolveAliasValue(ctx, value);
+    function mergeValue(ctx, map, value2) {
+      const source = resolveAliasValue(ctx, value2);
       if (!identity.isMap(source))
         throw new Error("Merge sources must be maps or map aliases");
       const srcMap = source.toJSON(null, ctx, Map);
-      for (const [key, value2] of srcMap) {
+      for (const [key, value3] of srcMap) {
         if (map instanceof Map) {
           if (!map.has(key))
-            map.set(key, value2);
+            map.set(key, value3);
         } else if (map instanceof Set) {
           map.add(key);
         } else if (!Object.prototype.hasOwnProperty.call(map, key)) {
           Object.defineProperty(map, key, {
-            value: value2,
+            value: value3,
             writable: true,
             enumerable: true,
             configurable: true
@@ -32767,8 +32767,8 @@ var require_merge = __commonJS({
       }
       return map;
     }
-    function resolveAliasValue(ctx, value) {
-      return ctx && identity.isAlias(value) ? value.resolve(ctx.doc, ctx) : value;
+    function resolveAliasValue(ctx, value2) {
+      return ctx && identity.isAlias(value2) ? value2.resolve(ctx.doc, ctx) : value2;
     }
     exports.addMergeToJSMap = addMergeToJSMap;
     exports.isMergeKey = isMergeKey;
@@ -32785,20 +32785,20 @@ var require_addPairToJSMap = __commonJS({
     var stringify = require_stringify();
     var identity = require_identity();
     var toJS = require_toJS();
-    function addPairToJSMap(ctx, map, { key, value }) {
+    function addPairToJSMap(ctx, map, { key, value: value2 }) {
       if (identity.isNode(key) && key.addToJSMap)
-        key.addToJSMap(ctx, map, value);
+        key.addToJSMap(ctx, map, value2);
       else if (merge2.isMergeKey(ctx, key))
-        merge2.addMergeToJSMap(ctx, map, value);
+        merge2.addMergeToJSMap(ctx, map, value2);
       else {
         const jsKey = toJS.toJS(key, "", ctx);
         if (map instanceof Map) {
-          map.set(jsKey, toJS.toJS(value, jsKey, ctx));
+          map.set(jsKey, toJS.toJS(value2, jsKey, ctx));
         } else if (map instanceof Set) {
           map.add(jsKey);
         } else {
           const stringKey = stringifyKey(key, jsKey, ctx);
-          const jsValue = toJS.toJS(value, stringKey, ctx);
+          const jsValue = toJS.toJS(value2, stringKey, ctx);
           if (stringKey in map)
             Object.defineProperty(map, stringKey, {
               value: jsValue,
@@ -32848,24 +32848,24 @@ var require_Pair = __commonJS({
     var stringifyPair = require_stringifyPair();
     var addPairToJSMap = require_addPairToJSMap();
     var identity = require_identity();
-    function createPair(key, value, ctx) {
+    function createPair(key, value2, ctx) {
       const k = createNode.createNode(key, void 0, ctx);
-      const v = createNode.createNode(value, void 0, ctx);
+      const v = createNode.createNode(value2, void 0, ctx);
       return new Pair(k, v);
     }
     var Pair = class _Pair {
-      constructor(key, value = null) {
+      constructor(key, value2 = null) {
         Object.defineProperty(this, identity.NODE_TYPE, { value: identity.PAIR });
         this.key = key;
-        this.value = value;
+        this.value = value2;
       }
       clone(schema) {
-        let { key, value } = this;
+        let { key, value: value2 } = this;
         if (identity.isNode(key))
           key = key.clone(schema);
-        if (identity.isNode(value))
-          value = value.clone(schema);
-        return new _Pair(key, value);
+        if (identity.isNode(value2))
+          value2 = value2.clone(schema);
+        return new _Pair(key, value2);
       }
       toJSON(_, ctx) {
         const pair = ctx?.mapAsMap ? /* @__PURE__ */ new Map() : {};
@@ -33068,17 +33068,17 @@ var require_YAMLMap = __commonJS({
       static from(schema, obj, ctx) {
         const { keepUndefined, replacer } = ctx;
         const map = new this(schema);
-        const add = (key, value) => {
+        const add = (key, value2) => {
           if (typeof replacer === "function")
-            value = replacer.call(obj, key, value);
+            value2 = replacer.call(obj, key, value2);
           else if (Array.isArray(replacer) && !replacer.includes(key))
             return;
-          if (value !== void 0 || keepUndefined)
-            map.items.push(Pair.createPair(key, value, ctx));
+          if (value2 !== void 0 || keepUndefined)
+            map.items.push(Pair.createPair(key, value2, ctx));
         };
         if (obj instanceof Map) {
-          for (const [key, value] of obj)
-            add(key, value);
+          for (const [key, value2] of obj)
+            add(key, value2);
         } else if (obj && typeof obj === "object") {
           for (const key of Object.keys(obj))
             add(key, obj[key]);
@@ -33136,8 +33136,8 @@ var require_YAMLMap = __commonJS({
       has(key) {
         return !!findPair(this.items, key);
       }
-      set(key, value) {
-        this.add(new Pair.Pair(key, value), true);
+      set(key, value2) {
+        this.add(new Pair.Pair(key, value2), true);
       }
       /**
        * @param ctx - Conversion context, originally set in Document#toJS()
@@ -33215,8 +33215,8 @@ var require_YAMLSeq = __commonJS({
         super(identity.SEQ, schema);
         this.items = [];
       }
-      add(value) {
-        this.items.push(value);
+      add(value2) {
+        this.items.push(value2);
       }
       /**
        * Removes a value from the collection.
@@ -33257,15 +33257,15 @@ var require_YAMLSeq = __commonJS({
        * If `key` does not contain a representation of an integer, this will throw.
        * It may be wrapped in a `Scalar`.
        */
-      set(key, value) {
+      set(key, value2) {
         const idx = asItemIndex(key);
         if (typeof idx !== "number")
           throw new Error(`Expected a valid index, not ${key}.`);
         const prev = this.items[idx];
-        if (identity.isScalar(prev) && Scalar.isScalarValue(value))
-          prev.value = value;
+        if (identity.isScalar(prev) && Scalar.isScalarValue(value2))
+          prev.value = value2;
         else
-          this.items[idx] = value;
+          this.items[idx] = value2;
       }
       toJSON(_, ctx) {
         const seq = [];
@@ -33341,7 +33341,7 @@ var require_string = __commonJS({
     "use strict";
     var stringifyString = require_stringifyString();
     var string = {
-      identify: (value) => typeof value === "string",
+      identify: (value2) => typeof value2 === "string",
       default: true,
       tag: "tag:yaml.org,2002:str",
       resolve: (str) => str,
@@ -33360,7 +33360,7 @@ var require_null = __commonJS({
     "use strict";
     var Scalar = require_Scalar();
     var nullTag = {
-      identify: (value) => value == null,
+      identify: (value2) => value2 == null,
       createNode: () => new Scalar.Scalar(null),
       default: true,
       tag: "tag:yaml.org,2002:null",
@@ -33378,18 +33378,18 @@ var require_bool = __commonJS({
     "use strict";
     var Scalar = require_Scalar();
     var boolTag = {
-      identify: (value) => typeof value === "boolean",
+      identify: (value2) => typeof value2 === "boolean",
       default: true,
       tag: "tag:yaml.org,2002:bool",
       test: /^(?:[Tt]rue|TRUE|[Ff]alse|FALSE)$/,
       resolve: (str) => new Scalar.Scalar(str[0] === "t" || str[0] === "T"),
-      stringify({ source, value }, ctx) {
+      stringify({ source, value: value2 }, ctx) {
         if (source && boolTag.test.test(source)) {
           const sv = source[0] === "t" || source[0] === "T";
-          if (value === sv)
+          if (value2 === sv)
             return source;
         }
-        return value ? ctx.options.trueStr : ctx.options.falseStr;
+        return value2 ? ctx.options.trueStr : ctx.options.falseStr;
       }
     };
     exports.boolTag = boolTag;
@@ -33400,13 +33400,13 @@ var require_bool = __commonJS({
 var require_stringifyNumber = __commonJS({
   "node_modules/yaml/dist/stringify/stringifyNumber.js"(exports) {
     "use strict";
-    function stringifyNumber({ format, minFractionDigits, tag, value }) {
-      if (typeof value === "bigint")
-        return String(value);
-      const num2 = typeof value === "number" ? value : Number(value);
-      if (!isFinite(num2))
-        return isNaN(num2) ? ".nan" : num2 < 0 ? "-.inf" : ".inf";
-      let n = Object.is(value, -0) ? "-0" : JSON.stringify(value);
+    function stringifyNumber({ format, minFractionDigits, tag, value: value2 }) {
+      if (typeof value2 === "bigint")
+        return String(value2);
+      const num = typeof value2 === "number" ? value2 : Number(value2);
+      if (!isFinite(num))
+        return isNaN(num) ? ".nan" : num < 0 ? "-.inf" : ".inf";
+      let n = Object.is(value2, -0) ? "-0" : JSON.stringify(value2);
       if (!format && minFractionDigits && (!tag || tag === "tag:yaml.org,2002:float") && /^-?\d/.test(n) && !n.includes("e")) {
         let i2 = n.indexOf(".");
         if (i2 < 0) {
@@ -33430,7 +33430,7 @@ var require_float = __commonJS({
     var Scalar = require_Scalar();
     var stringifyNumber = require_stringifyNumber();
     var floatNaN = {
-      identify: (value) => typeof value === "number",
+      identify: (value2) => typeof value2 === "number",
       default: true,
       tag: "tag:yaml.org,2002:float",
       test: /^(?:[-+]?\.(?:inf|Inf|INF)|\.nan|\.NaN|\.NAN)$/,
@@ -33438,19 +33438,19 @@ var require_float = __commonJS({
       stringify: stringifyNumber.stringifyNumber
     };
     var floatExp = {
-      identify: (value) => typeof value === "number",
+      identify: (value2) => typeof value2 === "number",
       default: true,
       tag: "tag:yaml.org,2002:float",
       format: "EXP",
       test: /^[-+]?(?:\.[0-9]+|[0-9]+(?:\.[0-9]*)?)[eE][-+]?[0-9]+$/,
       resolve: (str) => parseFloat(str),
       stringify(node) {
-        const num2 = Number(node.value);
-        return isFinite(num2) ? num2.toExponential() : stringifyNumber.stringifyNumber(node);
+        const num = Number(node.value);
+        return isFinite(num) ? num.toExponential() : stringifyNumber.stringifyNumber(node);
       }
     };
     var float = {
-      identify: (value) => typeof value === "number",
+      identify: (value2) => typeof value2 === "number",
       default: true,
       tag: "tag:yaml.org,2002:float",
       test: /^[-+]?(?:\.[0-9]+|[0-9]+\.[0-9]*)$/,
@@ -33474,16 +33474,16 @@ var require_int = __commonJS({
   "node_modules/yaml/dist/schema/core/int.js"(exports) {
     "use strict";
     var stringifyNumber = require_stringifyNumber();
-    var intIdentify = (value) => typeof value === "bigint" || Number.isInteger(value);
+    var intIdentify = (value2) => typeof value2 === "bigint" || Number.isInteger(value2);
     var intResolve = (str, offset, radix, { intAsBigInt }) => intAsBigInt ? BigInt(str) : parseInt(str.substring(offset), radix);
     function intStringify(node, radix, prefix) {
-      const { value } = node;
-      if (intIdentify(value) && value >= 0)
-        return prefix + value.toString(radix);
+      const { value: value2 } = node;
+      if (intIdentify(value2) && value2 >= 0)
+        return prefix + value2.toString(radix);
       return stringifyNumber.stringifyNumber(node);
     }
     var intOct = {
-      identify: (value) => intIdentify(value) && value >= 0,
+      identify: (value2) => intIdentify(value2) && value2 >= 0,
       default: true,
       tag: "tag:yaml.org,2002:int",
       format: "OCT",
@@ -33500,7 +33500,7 @@ var require_int = __commonJS({
       stringify: stringifyNumber.stringifyNumber
     };
     var intHex = {
-      identify: (value) => intIdentify(value) && value >= 0,
+      identify: (value2) => intIdentify(value2) && value2 >= 0,
       default: true,
       tag: "tag:yaml.org,2002:int",
       format: "HEX",
@@ -33549,20 +33549,20 @@ var require_schema3 = __commonJS({
     var Scalar = require_Scalar();
     var map = require_map();
     var seq = require_seq();
-    function intIdentify(value) {
-      return typeof value === "bigint" || Number.isInteger(value);
+    function intIdentify(value2) {
+      return typeof value2 === "bigint" || Number.isInteger(value2);
     }
-    var stringifyJSON = ({ value }) => JSON.stringify(value);
+    var stringifyJSON = ({ value: value2 }) => JSON.stringify(value2);
     var jsonScalars = [
       {
-        identify: (value) => typeof value === "string",
+        identify: (value2) => typeof value2 === "string",
         default: true,
         tag: "tag:yaml.org,2002:str",
         resolve: (str) => str,
         stringify: stringifyJSON
       },
       {
-        identify: (value) => value == null,
+        identify: (value2) => value2 == null,
         createNode: () => new Scalar.Scalar(null),
         default: true,
         tag: "tag:yaml.org,2002:null",
@@ -33571,7 +33571,7 @@ var require_schema3 = __commonJS({
         stringify: stringifyJSON
       },
       {
-        identify: (value) => typeof value === "boolean",
+        identify: (value2) => typeof value2 === "boolean",
         default: true,
         tag: "tag:yaml.org,2002:bool",
         test: /^true$|^false$/,
@@ -33584,10 +33584,10 @@ var require_schema3 = __commonJS({
         tag: "tag:yaml.org,2002:int",
         test: /^-?(?:0|[1-9][0-9]*)$/,
         resolve: (str, _onError, { intAsBigInt }) => intAsBigInt ? BigInt(str) : parseInt(str, 10),
-        stringify: ({ value }) => intIdentify(value) ? value.toString() : JSON.stringify(value)
+        stringify: ({ value: value2 }) => intIdentify(value2) ? value2.toString() : JSON.stringify(value2)
       },
       {
-        identify: (value) => typeof value === "number",
+        identify: (value2) => typeof value2 === "number",
         default: true,
         tag: "tag:yaml.org,2002:float",
         test: /^-?(?:0|[1-9][0-9]*)(?:\.[0-9]*)?(?:[eE][-+]?[0-9]+)?$/,
@@ -33617,7 +33617,7 @@ var require_binary = __commonJS({
     var Scalar = require_Scalar();
     var stringifyString = require_stringifyString();
     var binary = {
-      identify: (value) => value instanceof Uint8Array,
+      identify: (value2) => value2 instanceof Uint8Array,
       // Buffer inherits from Uint8Array
       default: false,
       tag: "tag:yaml.org,2002:binary",
@@ -33643,10 +33643,10 @@ var require_binary = __commonJS({
           return src;
         }
       },
-      stringify({ comment, type, value }, ctx, onComment, onChompKeep) {
-        if (!value)
+      stringify({ comment, type, value: value2 }, ctx, onComment, onChompKeep) {
+        if (!value2)
           return "";
-        const buf = value;
+        const buf = value2;
         let str;
         if (typeof node_buffer.Buffer === "function") {
           str = buf instanceof node_buffer.Buffer ? buf.toString("base64") : node_buffer.Buffer.from(buf.buffer).toString("base64");
@@ -33718,25 +33718,25 @@ ${cn.comment}` : item.comment;
         for (let it of iterable) {
           if (typeof replacer === "function")
             it = replacer.call(iterable, String(i2++), it);
-          let key, value;
+          let key, value2;
           if (Array.isArray(it)) {
             if (it.length === 2) {
               key = it[0];
-              value = it[1];
+              value2 = it[1];
             } else
               throw new TypeError(`Expected [key, value] tuple: ${it}`);
           } else if (it && it instanceof Object) {
             const keys = Object.keys(it);
             if (keys.length === 1) {
               key = keys[0];
-              value = it[key];
+              value2 = it[key];
             } else {
               throw new TypeError(`Expected tuple with one key, not ${keys.length} keys`);
             }
           } else {
             key = it;
           }
-          pairs2.items.push(Pair.createPair(key, value, ctx));
+          pairs2.items.push(Pair.createPair(key, value2, ctx));
         }
       return pairs2;
     }
@@ -33783,16 +33783,16 @@ var require_omap = __commonJS({
         if (ctx?.onCreate)
           ctx.onCreate(map);
         for (const pair of this.items) {
-          let key, value;
+          let key, value2;
           if (identity.isPair(pair)) {
             key = toJS.toJS(pair.key, "", ctx);
-            value = toJS.toJS(pair.value, key, ctx);
+            value2 = toJS.toJS(pair.value, key, ctx);
           } else {
             key = toJS.toJS(pair, "", ctx);
           }
           if (map.has(key))
             throw new Error("Ordered maps must not include duplicate keys");
-          map.set(key, value);
+          map.set(key, value2);
         }
         return map;
       }
@@ -33806,7 +33806,7 @@ var require_omap = __commonJS({
     YAMLOMap.tag = "tag:yaml.org,2002:omap";
     var omap = {
       collection: "seq",
-      identify: (value) => value instanceof Map,
+      identify: (value2) => value2 instanceof Map,
       nodeClass: YAMLOMap,
       default: false,
       tag: "tag:yaml.org,2002:omap",
@@ -33836,14 +33836,14 @@ var require_bool2 = __commonJS({
   "node_modules/yaml/dist/schema/yaml-1.1/bool.js"(exports) {
     "use strict";
     var Scalar = require_Scalar();
-    function boolStringify({ value, source }, ctx) {
-      const boolObj = value ? trueTag : falseTag;
+    function boolStringify({ value: value2, source }, ctx) {
+      const boolObj = value2 ? trueTag : falseTag;
       if (source && boolObj.test.test(source))
         return source;
-      return value ? ctx.options.trueStr : ctx.options.falseStr;
+      return value2 ? ctx.options.trueStr : ctx.options.falseStr;
     }
     var trueTag = {
-      identify: (value) => value === true,
+      identify: (value2) => value2 === true,
       default: true,
       tag: "tag:yaml.org,2002:bool",
       test: /^(?:Y|y|[Yy]es|YES|[Tt]rue|TRUE|[Oo]n|ON)$/,
@@ -33851,7 +33851,7 @@ var require_bool2 = __commonJS({
       stringify: boolStringify
     };
     var falseTag = {
-      identify: (value) => value === false,
+      identify: (value2) => value2 === false,
       default: true,
       tag: "tag:yaml.org,2002:bool",
       test: /^(?:N|n|[Nn]o|NO|[Ff]alse|FALSE|[Oo]ff|OFF)$/,
@@ -33870,7 +33870,7 @@ var require_float2 = __commonJS({
     var Scalar = require_Scalar();
     var stringifyNumber = require_stringifyNumber();
     var floatNaN = {
-      identify: (value) => typeof value === "number",
+      identify: (value2) => typeof value2 === "number",
       default: true,
       tag: "tag:yaml.org,2002:float",
       test: /^(?:[-+]?\.(?:inf|Inf|INF)|\.nan|\.NaN|\.NAN)$/,
@@ -33878,19 +33878,19 @@ var require_float2 = __commonJS({
       stringify: stringifyNumber.stringifyNumber
     };
     var floatExp = {
-      identify: (value) => typeof value === "number",
+      identify: (value2) => typeof value2 === "number",
       default: true,
       tag: "tag:yaml.org,2002:float",
       format: "EXP",
       test: /^[-+]?(?:[0-9][0-9_]*)?(?:\.[0-9_]*)?[eE][-+]?[0-9]+$/,
       resolve: (str) => parseFloat(str.replace(/_/g, "")),
       stringify(node) {
-        const num2 = Number(node.value);
-        return isFinite(num2) ? num2.toExponential() : stringifyNumber.stringifyNumber(node);
+        const num = Number(node.value);
+        return isFinite(num) ? num.toExponential() : stringifyNumber.stringifyNumber(node);
       }
     };
     var float = {
-      identify: (value) => typeof value === "number",
+      identify: (value2) => typeof value2 === "number",
       default: true,
       tag: "tag:yaml.org,2002:float",
       test: /^[-+]?(?:[0-9][0-9_]*)?\.[0-9_]*$/,
@@ -33917,7 +33917,7 @@ var require_int2 = __commonJS({
   "node_modules/yaml/dist/schema/yaml-1.1/int.js"(exports) {
     "use strict";
     var stringifyNumber = require_stringifyNumber();
-    var intIdentify = (value) => typeof value === "bigint" || Number.isInteger(value);
+    var intIdentify = (value2) => typeof value2 === "bigint" || Number.isInteger(value2);
     function intResolve(str, offset, radix, { intAsBigInt }) {
       const sign = str[0];
       if (sign === "-" || sign === "+")
@@ -33942,10 +33942,10 @@ var require_int2 = __commonJS({
       return sign === "-" ? -1 * n : n;
     }
     function intStringify(node, radix, prefix) {
-      const { value } = node;
-      if (intIdentify(value)) {
-        const str = value.toString(radix);
-        return value < 0 ? "-" + prefix + str.substr(1) : prefix + str;
+      const { value: value2 } = node;
+      if (intIdentify(value2)) {
+        const str = value2.toString(radix);
+        return value2 < 0 ? "-" + prefix + str.substr(1) : prefix + str;
       }
       return stringifyNumber.stringifyNumber(node);
     }
@@ -34023,13 +34023,13 @@ var require_set = __commonJS({
         const pair = YAMLMap.findPair(this.items, key);
         return !keepPair && identity.isPair(pair) ? identity.isScalar(pair.key) ? pair.key.value : pair.key : pair;
       }
-      set(key, value) {
-        if (typeof value !== "boolean")
-          throw new Error(`Expected boolean value for set(key, value) in a YAML set, not ${typeof value}`);
+      set(key, value2) {
+        if (typeof value2 !== "boolean")
+          throw new Error(`Expected boolean value for set(key, value) in a YAML set, not ${typeof value2}`);
         const prev = YAMLMap.findPair(this.items, key);
-        if (prev && !value) {
+        if (prev && !value2) {
           this.items.splice(this.items.indexOf(prev), 1);
-        } else if (!prev && value) {
+        } else if (!prev && value2) {
           this.items.push(new Pair.Pair(key));
         }
       }
@@ -34048,10 +34048,10 @@ var require_set = __commonJS({
         const { replacer } = ctx;
         const set2 = new this(schema);
         if (iterable && Symbol.iterator in Object(iterable))
-          for (let value of iterable) {
+          for (let value2 of iterable) {
             if (typeof replacer === "function")
-              value = replacer.call(iterable, value, value);
-            set2.items.push(Pair.createPair(value, null, ctx));
+              value2 = replacer.call(iterable, value2, value2);
+            set2.items.push(Pair.createPair(value2, null, ctx));
           }
         return set2;
       }
@@ -34059,7 +34059,7 @@ var require_set = __commonJS({
     YAMLSet.tag = "tag:yaml.org,2002:set";
     var set = {
       collection: "map",
-      identify: (value) => value instanceof Set,
+      identify: (value2) => value2 instanceof Set,
       nodeClass: YAMLSet,
       default: false,
       tag: "tag:yaml.org,2002:set",
@@ -34088,38 +34088,38 @@ var require_timestamp = __commonJS({
     function parseSexagesimal(str, asBigInt) {
       const sign = str[0];
       const parts = sign === "-" || sign === "+" ? str.substring(1) : str;
-      const num2 = (n) => asBigInt ? BigInt(n) : Number(n);
-      const res = parts.replace(/_/g, "").split(":").reduce((res2, p) => res2 * num2(60) + num2(p), num2(0));
-      return sign === "-" ? num2(-1) * res : res;
+      const num = (n) => asBigInt ? BigInt(n) : Number(n);
+      const res = parts.replace(/_/g, "").split(":").reduce((res2, p) => res2 * num(60) + num(p), num(0));
+      return sign === "-" ? num(-1) * res : res;
     }
     function stringifySexagesimal(node) {
-      let { value } = node;
-      let num2 = (n) => n;
-      if (typeof value === "bigint")
-        num2 = (n) => BigInt(n);
-      else if (isNaN(value) || !isFinite(value))
+      let { value: value2 } = node;
+      let num = (n) => n;
+      if (typeof value2 === "bigint")
+        num = (n) => BigInt(n);
+      else if (isNaN(value2) || !isFinite(value2))
         return stringifyNumber.stringifyNumber(node);
       let sign = "";
-      if (value < 0) {
+      if (value2 < 0) {
         sign = "-";
-        value *= num2(-1);
+        value2 *= num(-1);
       }
-      const _60 = num2(60);
-      const parts = [value % _60];
-      if (value < 60) {
+      const _60 = num(60);
+      const parts = [value2 % _60];
+      if (value2 < 60) {
         parts.unshift(0);
       } else {
-        value = (value - parts[0]) / _60;
-        parts.unshift(value % _60);
-        if (value >= 60) {
-          value = (value - parts[0]) / _60;
-          parts.unshift(value);
+        value2 = (value2 - parts[0]) / _60;
+        parts.unshift(value2 % _60);
+        if (value2 >= 60) {
+          value2 = (value2 - parts[0]) / _60;
+          parts.unshift(value2);
         }
       }
       return sign + parts.map((n) => String(n).padStart(2, "0")).join(":").replace(/000000\d*$/, "");
     }
     var intTime = {
-      identify: (value) => typeof value === "bigint" || Number.isInteger(value),
+      identify: (value2) => typeof value2 === "bigint" || Number.isInteger(value2),
       default: true,
       tag: "tag:yaml.org,2002:int",
       format: "TIME",
@@ -34128,7 +34128,7 @@ var require_timestamp = __commonJS({
       stringify: stringifySexagesimal
     };
     var floatTime = {
-      identify: (value) => typeof value === "number",
+      identify: (value2) => typeof value2 === "number",
       default: true,
       tag: "tag:yaml.org,2002:float",
       format: "TIME",
@@ -34137,7 +34137,7 @@ var require_timestamp = __commonJS({
       stringify: stringifySexagesimal
     };
     var timestamp = {
-      identify: (value) => value instanceof Date,
+      identify: (value2) => value2 instanceof Date,
       default: true,
       tag: "tag:yaml.org,2002:timestamp",
       // If the time zone is omitted, the timestamp is assumed to be specified in UTC. The time part
@@ -34160,7 +34160,7 @@ var require_timestamp = __commonJS({
         }
         return new Date(date);
       },
-      stringify: ({ value }) => value?.toISOString().replace(/(T00:00:00)?\.000Z$/, "") ?? ""
+      stringify: ({ value: value2 }) => value2?.toISOString().replace(/(T00:00:00)?\.000Z$/, "") ?? ""
     };
     exports.floatTime = floatTime;
     exports.intTime = intTime;
@@ -34434,7 +34434,7 @@ var require_Document = __commonJS({
     var createNode = require_createNode();
     var directives = require_directives();
     var Document = class _Document {
-      constructor(value, replacer, options) {
+      constructor(value2, replacer, options) {
         this.commentBefore = null;
         this.comment = null;
         this.errors = [];
@@ -34466,7 +34466,7 @@ var require_Document = __commonJS({
         } else
           this.directives = new directives.Directives({ version });
         this.setSchema(version, options);
-        this.contents = value === void 0 ? null : this.createNode(value, _replacer, options);
+        this.contents = value2 === void 0 ? null : this.createNode(value2, _replacer, options);
       }
       /**
        * Create a deep copy of this Document and its contents.
@@ -34491,14 +34491,14 @@ var require_Document = __commonJS({
         return copy;
       }
       /** Adds a value to the document. */
-      add(value) {
+      add(value2) {
         if (assertCollection(this.contents))
-          this.contents.add(value);
+          this.contents.add(value2);
       }
       /** Adds a value to the document. */
-      addIn(path, value) {
+      addIn(path, value2) {
         if (assertCollection(this.contents))
-          this.contents.addIn(path, value);
+          this.contents.addIn(path, value2);
       }
       /**
        * Create a new `Alias` node, ensuring that the target `node` has the required anchor.
@@ -34517,10 +34517,10 @@ var require_Document = __commonJS({
         }
         return new Alias.Alias(node.anchor);
       }
-      createNode(value, replacer, options) {
+      createNode(value2, replacer, options) {
         let _replacer = void 0;
         if (typeof replacer === "function") {
-          value = replacer.call({ "": value }, "", value);
+          value2 = replacer.call({ "": value2 }, "", value2);
           _replacer = replacer;
         } else if (Array.isArray(replacer)) {
           const keyToStr = (v) => typeof v === "number" || v instanceof String || v instanceof Number;
@@ -34547,7 +34547,7 @@ var require_Document = __commonJS({
           schema: this.schema,
           sourceObjects
         };
-        const node = createNode.createNode(value, tag, ctx);
+        const node = createNode.createNode(value2, tag, ctx);
         if (flow && identity.isCollection(node))
           node.flow = true;
         setAnchors();
@@ -34557,9 +34557,9 @@ var require_Document = __commonJS({
        * Convert a key and a value into a `Pair` using the current schema,
        * recursively wrapping all values as `Scalar` or `Collection` nodes.
        */
-      createPair(key, value, options = {}) {
+      createPair(key, value2, options = {}) {
         const k = this.createNode(key, null, options);
-        const v = this.createNode(value, null, options);
+        const v = this.createNode(value2, null, options);
         return new Pair.Pair(k, v);
       }
       /**
@@ -34618,24 +34618,24 @@ var require_Document = __commonJS({
        * Sets a value in this document. For `!!set`, `value` needs to be a
        * boolean to add/remove the item from the set.
        */
-      set(key, value) {
+      set(key, value2) {
         if (this.contents == null) {
-          this.contents = Collection2.collectionFromPath(this.schema, [key], value);
+          this.contents = Collection2.collectionFromPath(this.schema, [key], value2);
         } else if (assertCollection(this.contents)) {
-          this.contents.set(key, value);
+          this.contents.set(key, value2);
         }
       }
       /**
        * Sets a value in this document. For `!!set`, `value` needs to be a
        * boolean to add/remove the item from the set.
        */
-      setIn(path, value) {
+      setIn(path, value2) {
         if (Collection2.isEmptyPath(path)) {
-          this.contents = value;
+          this.contents = value2;
         } else if (this.contents == null) {
-          this.contents = Collection2.collectionFromPath(this.schema, Array.from(path), value);
+          this.contents = Collection2.collectionFromPath(this.schema, Array.from(path), value2);
         } else if (assertCollection(this.contents)) {
-          this.contents.setIn(path, value);
+          this.contents.setIn(path, value2);
         }
       }
       /**
@@ -35021,7 +35021,7 @@ var require_resolve_block_map = __commonJS({
       let offset = bm.offset;
       let commentEnd = null;
       for (const collItem of bm.items) {
-        const { start, key, sep: sep3, value } = collItem;
+        const { start, key, sep: sep3, value: value2 } = collItem;
         const keyProps = resolveProps.resolveProps(start, {
           indicator: "explicit-key-ind",
           next: key ?? sep3?.[0],
@@ -35064,7 +35064,7 @@ var require_resolve_block_map = __commonJS({
           onError(keyStart, "DUPLICATE_KEY", "Map keys must be unique");
         const valueProps = resolveProps.resolveProps(sep3 ?? [], {
           indicator: "map-value-ind",
-          next: value,
+          next: value2,
           offset: keyNode.range[2],
           onError,
           parentIndent: bm.indent,
@@ -35073,14 +35073,14 @@ var require_resolve_block_map = __commonJS({
         offset = valueProps.end;
         if (valueProps.found) {
           if (implicitKey) {
-            if (value?.type === "block-map" && !valueProps.hasNewline)
+            if (value2?.type === "block-map" && !valueProps.hasNewline)
               onError(offset, "BLOCK_AS_IMPLICIT_KEY", "Nested mappings are not allowed in compact mappings");
             if (ctx.options.strict && keyProps.start < valueProps.found.offset - 1024)
               onError(keyNode.range, "KEY_OVER_1024_CHARS", "The : indicator must be at most 1024 chars after the start of an implicit block mapping key");
           }
-          const valueNode = value ? composeNode(ctx, value, valueProps, onError) : composeEmptyNode(ctx, offset, sep3, null, valueProps, onError);
+          const valueNode = value2 ? composeNode(ctx, value2, valueProps, onError) : composeEmptyNode(ctx, offset, sep3, null, valueProps, onError);
           if (ctx.schema.compat)
-            utilFlowIndentCheck.flowIndentCheck(bm.indent, value, onError);
+            utilFlowIndentCheck.flowIndentCheck(bm.indent, value2, onError);
           offset = valueNode.range[2];
           const pair = new Pair.Pair(keyNode, valueNode);
           if (ctx.options.keepSourceTokens)
@@ -35126,18 +35126,18 @@ var require_resolve_block_seq = __commonJS({
         ctx.atKey = false;
       let offset = bs.offset;
       let commentEnd = null;
-      for (const { start, value } of bs.items) {
+      for (const { start, value: value2 } of bs.items) {
         const props = resolveProps.resolveProps(start, {
           indicator: "seq-item-ind",
-          next: value,
+          next: value2,
           offset,
           onError,
           parentIndent: bs.indent,
           startOnNewline: true
         });
         if (!props.found) {
-          if (props.anchor || props.tag || value) {
-            if (value?.type === "block-seq")
+          if (props.anchor || props.tag || value2) {
+            if (value2?.type === "block-seq")
               onError(props.end, "BAD_INDENT", "All sequence items must start at the same column");
             else
               onError(offset, "MISSING_CHAR", "Sequence item without - indicator");
@@ -35148,9 +35148,9 @@ var require_resolve_block_seq = __commonJS({
             continue;
           }
         }
-        const node = value ? composeNode(ctx, value, props, onError) : composeEmptyNode(ctx, props.end, start, null, props, onError);
+        const node = value2 ? composeNode(ctx, value2, props, onError) : composeEmptyNode(ctx, props.end, start, null, props, onError);
         if (ctx.schema.compat)
-          utilFlowIndentCheck.flowIndentCheck(bs.indent, value, onError);
+          utilFlowIndentCheck.flowIndentCheck(bs.indent, value2, onError);
         offset = node.range[2];
         seq.items.push(node);
       }
@@ -35232,7 +35232,7 @@ var require_resolve_flow_collection = __commonJS({
       let offset = fc.offset + fc.start.source.length;
       for (let i2 = 0; i2 < fc.items.length; ++i2) {
         const collItem = fc.items[i2];
-        const { start, key, sep: sep3, value } = collItem;
+        const { start, key, sep: sep3, value: value2 } = collItem;
         const props = resolveProps.resolveProps(start, {
           flow: fcName,
           indicator: "explicit-key-ind",
@@ -35243,7 +35243,7 @@ var require_resolve_flow_collection = __commonJS({
           startOnNewline: false
         });
         if (!props.found) {
-          if (!props.anchor && !props.tag && !sep3 && !value) {
+          if (!props.anchor && !props.tag && !sep3 && !value2) {
             if (i2 === 0 && props.comma)
               onError(props.comma, "UNEXPECTED_TOKEN", `Unexpected , in ${fcName}`);
             else if (i2 < fc.items.length - 1)
@@ -35298,10 +35298,10 @@ var require_resolve_flow_collection = __commonJS({
           }
         }
         if (!isMap && !sep3 && !props.found) {
-          const valueNode = value ? composeNode(ctx, value, props, onError) : composeEmptyNode(ctx, props.end, sep3, null, props, onError);
+          const valueNode = value2 ? composeNode(ctx, value2, props, onError) : composeEmptyNode(ctx, props.end, sep3, null, props, onError);
           coll.items.push(valueNode);
           offset = valueNode.range[2];
-          if (isBlock(value))
+          if (isBlock(value2))
             onError(valueNode.range, "BLOCK_IN_FLOW", blockMsg);
         } else {
           ctx.atKey = true;
@@ -35313,7 +35313,7 @@ var require_resolve_flow_collection = __commonJS({
           const valueProps = resolveProps.resolveProps(sep3 ?? [], {
             flow: fcName,
             indicator: "map-value-ind",
-            next: value,
+            next: value2,
             offset: keyNode.range[2],
             onError,
             parentIndent: fc.indent,
@@ -35333,15 +35333,15 @@ var require_resolve_flow_collection = __commonJS({
               if (props.start < valueProps.found.offset - 1024)
                 onError(valueProps.found, "KEY_OVER_1024_CHARS", "The : indicator must be at most 1024 chars after the start of an implicit flow sequence key");
             }
-          } else if (value) {
-            if ("source" in value && value.source?.[0] === ":")
-              onError(value, "MISSING_CHAR", `Missing space after : in ${fcName}`);
+          } else if (value2) {
+            if ("source" in value2 && value2.source?.[0] === ":")
+              onError(value2, "MISSING_CHAR", `Missing space after : in ${fcName}`);
             else
               onError(valueProps.start, "MISSING_CHAR", `Missing , or : between ${fcName} items`);
           }
-          const valueNode = value ? composeNode(ctx, value, valueProps, onError) : valueProps.found ? composeEmptyNode(ctx, valueProps.end, sep3, null, valueProps, onError) : null;
+          const valueNode = value2 ? composeNode(ctx, value2, valueProps, onError) : valueProps.found ? composeEmptyNode(ctx, valueProps.end, sep3, null, valueProps, onError) : null;
           if (valueNode) {
-            if (isBlock(value))
+            if (isBlock(value2))
               onError(valueNode.range, "BLOCK_IN_FLOW", blockMsg);
           } else if (valueProps.comment) {
             if (keyNode.comment)
@@ -35484,11 +35484,11 @@ var require_resolve_block_scalar = __commonJS({
           break;
       }
       if (chompStart === 0) {
-        const value2 = header.chomp === "+" && lines.length > 0 ? "\n".repeat(Math.max(1, lines.length - 1)) : "";
+        const value3 = header.chomp === "+" && lines.length > 0 ? "\n".repeat(Math.max(1, lines.length - 1)) : "";
         let end2 = start + header.length;
         if (scalar.source)
           end2 += scalar.source.length;
-        return { value: value2, type, comment: header.comment, range: [start, end2, end2] };
+        return { value: value3, type, comment: header.comment, range: [start, end2, end2] };
       }
       let trimIndent = scalar.indent + header.indent;
       let offset = scalar.offset + header.length;
@@ -35518,11 +35518,11 @@ var require_resolve_block_scalar = __commonJS({
         if (lines[i2][0].length > trimIndent)
           chompStart = i2 + 1;
       }
-      let value = "";
+      let value2 = "";
       let sep3 = "";
       let prevMoreIndented = false;
       for (let i2 = 0; i2 < contentStart; ++i2)
-        value += lines[i2][0].slice(trimIndent) + "\n";
+        value2 += lines[i2][0].slice(trimIndent) + "\n";
       for (let i2 = contentStart; i2 < chompStart; ++i2) {
         let [indent, content] = lines[i2];
         offset += indent.length + content.length + 1;
@@ -35536,23 +35536,23 @@ var require_resolve_block_scalar = __commonJS({
           indent = "";
         }
         if (type === Scalar.Scalar.BLOCK_LITERAL) {
-          value += sep3 + indent.slice(trimIndent) + content;
+          value2 += sep3 + indent.slice(trimIndent) + content;
           sep3 = "\n";
         } else if (indent.length > trimIndent || content[0] === "	") {
           if (sep3 === " ")
             sep3 = "\n";
           else if (!prevMoreIndented && sep3 === "\n")
             sep3 = "\n\n";
-          value += sep3 + indent.slice(trimIndent) + content;
+          value2 += sep3 + indent.slice(trimIndent) + content;
           sep3 = "\n";
           prevMoreIndented = true;
         } else if (content === "") {
           if (sep3 === "\n")
-            value += "\n";
+            value2 += "\n";
           else
             sep3 = "\n";
         } else {
-          value += sep3 + content;
+          value2 += sep3 + content;
           sep3 = " ";
           prevMoreIndented = false;
         }
@@ -35562,15 +35562,15 @@ var require_resolve_block_scalar = __commonJS({
           break;
         case "+":
           for (let i2 = chompStart; i2 < lines.length; ++i2)
-            value += "\n" + lines[i2][0].slice(trimIndent);
-          if (value[value.length - 1] !== "\n")
-            value += "\n";
+            value2 += "\n" + lines[i2][0].slice(trimIndent);
+          if (value2[value2.length - 1] !== "\n")
+            value2 += "\n";
           break;
         default:
-          value += "\n";
+          value2 += "\n";
       }
       const end = start + header.length + scalar.source.length;
-      return { value, type, comment: header.comment, range: [start, end, end] };
+      return { value: value2, type, comment: header.comment, range: [start, end, end] };
     }
     function parseBlockScalarHeader({ offset, props }, strict, onError) {
       if (props[0].type !== "block-scalar-header") {
@@ -35655,20 +35655,20 @@ var require_resolve_flow_scalar = __commonJS({
     function resolveFlowScalar(scalar, strict, onError) {
       const { offset, type, source, end } = scalar;
       let _type;
-      let value;
+      let value2;
       const _onError = (rel, code, msg) => onError(offset + rel, code, msg);
       switch (type) {
         case "scalar":
           _type = Scalar.Scalar.PLAIN;
-          value = plainValue(source, _onError);
+          value2 = plainValue(source, _onError);
           break;
         case "single-quoted-scalar":
           _type = Scalar.Scalar.QUOTE_SINGLE;
-          value = singleQuotedValue(source, _onError);
+          value2 = singleQuotedValue(source, _onError);
           break;
         case "double-quoted-scalar":
           _type = Scalar.Scalar.QUOTE_DOUBLE;
-          value = doubleQuotedValue(source, _onError);
+          value2 = doubleQuotedValue(source, _onError);
           break;
         /* istanbul ignore next should not happen */
         default:
@@ -35683,7 +35683,7 @@ var require_resolve_flow_scalar = __commonJS({
       const valueEnd = offset + source.length;
       const re = resolveEnd.resolveEnd(end, valueEnd, strict, onError);
       return {
-        value,
+        value: value2,
         type: _type,
         comment: re.comment,
         range: [offset, valueEnd, re.offset]
@@ -35876,28 +35876,28 @@ var require_compose_scalar = __commonJS({
     var resolveBlockScalar = require_resolve_block_scalar();
     var resolveFlowScalar = require_resolve_flow_scalar();
     function composeScalar(ctx, token, tagToken, onError) {
-      const { value, type, comment, range } = token.type === "block-scalar" ? resolveBlockScalar.resolveBlockScalar(ctx, token, onError) : resolveFlowScalar.resolveFlowScalar(token, ctx.options.strict, onError);
+      const { value: value2, type, comment, range } = token.type === "block-scalar" ? resolveBlockScalar.resolveBlockScalar(ctx, token, onError) : resolveFlowScalar.resolveFlowScalar(token, ctx.options.strict, onError);
       const tagName = tagToken ? ctx.directives.tagName(tagToken.source, (msg) => onError(tagToken, "TAG_RESOLVE_FAILED", msg)) : null;
       let tag;
       if (ctx.options.stringKeys && ctx.atKey) {
         tag = ctx.schema[identity.SCALAR];
       } else if (tagName)
-        tag = findScalarTagByName(ctx.schema, value, tagName, tagToken, onError);
+        tag = findScalarTagByName(ctx.schema, value2, tagName, tagToken, onError);
       else if (token.type === "scalar")
-        tag = findScalarTagByTest(ctx, value, token, onError);
+        tag = findScalarTagByTest(ctx, value2, token, onError);
       else
         tag = ctx.schema[identity.SCALAR];
       let scalar;
       try {
-        const res = tag.resolve(value, (msg) => onError(tagToken ?? token, "TAG_RESOLVE_FAILED", msg), ctx.options);
+        const res = tag.resolve(value2, (msg) => onError(tagToken ?? token, "TAG_RESOLVE_FAILED", msg), ctx.options);
         scalar = identity.isScalar(res) ? res : new Scalar.Scalar(res);
       } catch (error2) {
         const msg = error2 instanceof Error ? error2.message : String(error2);
         onError(tagToken ?? token, "TAG_RESOLVE_FAILED", msg);
-        scalar = new Scalar.Scalar(value);
+        scalar = new Scalar.Scalar(value2);
       }
       scalar.range = range;
-      scalar.source = value;
+      scalar.source = value2;
       if (type)
         scalar.type = type;
       if (tagName)
@@ -35908,7 +35908,7 @@ var require_compose_scalar = __commonJS({
         scalar.comment = comment;
       return scalar;
     }
-    function findScalarTagByName(schema, value, tagName, tagToken, onError) {
+    function findScalarTagByName(schema, value2, tagName, tagToken, onError) {
       if (tagName === "!")
         return schema[identity.SCALAR];
       const matchWithTest = [];
@@ -35921,7 +35921,7 @@ var require_compose_scalar = __commonJS({
         }
       }
       for (const tag of matchWithTest)
-        if (tag.test?.test(value))
+        if (tag.test?.test(value2))
           return tag;
       const kt = schema.knownTags[tagName];
       if (kt && !kt.collection) {
@@ -35931,10 +35931,10 @@ var require_compose_scalar = __commonJS({
       onError(tagToken, "TAG_RESOLVE_FAILED", `Unresolved tag: ${tagName}`, tagName !== "tag:yaml.org,2002:str");
       return schema[identity.SCALAR];
     }
-    function findScalarTagByTest({ atKey, directives, schema }, value, token, onError) {
-      const tag = schema.tags.find((tag2) => (tag2.default === true || atKey && tag2.default === "key") && tag2.test?.test(value)) || schema[identity.SCALAR];
+    function findScalarTagByTest({ atKey, directives, schema }, value2, token, onError) {
+      const tag = schema.tags.find((tag2) => (tag2.default === true || atKey && tag2.default === "key") && tag2.test?.test(value2)) || schema[identity.SCALAR];
       if (schema.compat) {
-        const compat = schema.compat.find((tag2) => tag2.default && tag2.test?.test(value)) ?? schema[identity.SCALAR];
+        const compat = schema.compat.find((tag2) => tag2.default && tag2.test?.test(value2)) ?? schema[identity.SCALAR];
         if (tag.tag !== compat.tag) {
           const ts = directives.tagString(tag.tag);
           const cs = directives.tagString(compat.tag);
@@ -36092,7 +36092,7 @@ var require_compose_doc = __commonJS({
     var composeNode = require_compose_node();
     var resolveEnd = require_resolve_end();
     var resolveProps = require_resolve_props();
-    function composeDoc(options, directives, { offset, start, value, end }, onError) {
+    function composeDoc(options, directives, { offset, start, value: value2, end }, onError) {
       const opts = Object.assign({ _directives: directives }, options);
       const doc = new Document.Document(void 0, opts);
       const ctx = {
@@ -36104,7 +36104,7 @@ var require_compose_doc = __commonJS({
       };
       const props = resolveProps.resolveProps(start, {
         indicator: "doc-start",
-        next: value ?? end?.[0],
+        next: value2 ?? end?.[0],
         offset,
         onError,
         parentIndent: 0,
@@ -36112,10 +36112,10 @@ var require_compose_doc = __commonJS({
       });
       if (props.found) {
         doc.directives.docStart = true;
-        if (value && (value.type === "block-map" || value.type === "block-seq") && !props.hasNewline)
+        if (value2 && (value2.type === "block-map" || value2.type === "block-seq") && !props.hasNewline)
           onError(props.end, "MISSING_CHAR", "Block collection cannot start on same line with directives-end marker");
       }
-      doc.contents = value ? composeNode.composeNode(ctx, value, props, onError) : composeNode.composeEmptyNode(ctx, props.end, start, null, props, onError);
+      doc.contents = value2 ? composeNode.composeNode(ctx, value2, props, onError) : composeNode.composeEmptyNode(ctx, props.end, start, null, props, onError);
       const contentEnd = doc.contents.range[2];
       const re = resolveEnd.resolveEnd(end, contentEnd, false, onError);
       if (re.comment)
@@ -36363,9 +36363,9 @@ var require_cst_scalar = __commonJS({
       }
       return null;
     }
-    function createScalarToken(value, context3) {
+    function createScalarToken(value2, context3) {
       const { implicitKey = false, indent, inFlow = false, offset = -1, type = "PLAIN" } = context3;
-      const source = stringifyString.stringifyString({ type, value }, {
+      const source = stringifyString.stringifyString({ type, value: value2 }, {
         implicitKey,
         indent: indent > 0 ? " ".repeat(indent) : "",
         inFlow,
@@ -36395,7 +36395,7 @@ var require_cst_scalar = __commonJS({
           return { type: "scalar", offset, indent, source, end };
       }
     }
-    function setScalarValue(token, value, context3 = {}) {
+    function setScalarValue(token, value2, context3 = {}) {
       let { afterKey = false, implicitKey = false, inFlow = false, type } = context3;
       let indent = "indent" in token ? token.indent : null;
       if (afterKey && typeof indent === "number")
@@ -36418,7 +36418,7 @@ var require_cst_scalar = __commonJS({
           default:
             type = "PLAIN";
         }
-      const source = stringifyString.stringifyString({ type, value }, {
+      const source = stringifyString.stringifyString({ type, value: value2 }, {
         implicitKey: implicitKey || indent === null,
         indent: indent !== null && indent > 0 ? " ".repeat(indent) : "",
         inFlow,
@@ -36564,7 +36564,7 @@ var require_cst_stringify = __commonJS({
         }
       }
     }
-    function stringifyItem({ start, key, sep: sep3, value }) {
+    function stringifyItem({ start, key, sep: sep3, value: value2 }) {
       let res = "";
       for (const st of start)
         res += st.source;
@@ -36573,8 +36573,8 @@ var require_cst_stringify = __commonJS({
       if (sep3)
         for (const st of sep3)
           res += st.source;
-      if (value)
-        res += stringifyToken(value);
+      if (value2)
+        res += stringifyToken(value2);
       return res;
     }
     exports.stringify = stringify;
@@ -37322,10 +37322,10 @@ var require_lexer = __commonJS({
         }
         return n;
       }
-      *pushUntil(test) {
+      *pushUntil(test2) {
         let i2 = this.pos;
         let ch = this.buffer[i2];
-        while (!test(ch))
+        while (!test2(ch))
           ch = this.buffer[++i2];
         return yield* this.pushToIndex(i2, false);
       }
@@ -38307,7 +38307,7 @@ var require_public_api = __commonJS({
       }
       return doc.toJS(Object.assign({ reviver: _reviver }, options));
     }
-    function stringify(value, replacer, options) {
+    function stringify(value2, replacer, options) {
       let _replacer = null;
       if (typeof replacer === "function" || Array.isArray(replacer)) {
         _replacer = replacer;
@@ -38320,14 +38320,14 @@ var require_public_api = __commonJS({
         const indent = Math.round(options);
         options = indent < 1 ? void 0 : indent > 8 ? { indent: 8 } : { indent };
       }
-      if (value === void 0) {
+      if (value2 === void 0) {
         const { keepUndefined } = options ?? replacer ?? {};
         if (!keepUndefined)
           return void 0;
       }
-      if (identity.isDocument(value) && !_replacer)
-        return value.toString(options);
-      return new Document.Document(value, _replacer, options).toString(options);
+      if (identity.isDocument(value2) && !_replacer)
+        return value2.toString(options);
+      return new Document.Document(value2, _replacer, options).toString(options);
     }
     exports.parse = parse3;
     exports.parseAllDocuments = parseAllDocuments;
@@ -38539,13 +38539,13 @@ function lowercaseKeys(object) {
     return newObj;
   }, {});
 }
-function isPlainObject(value) {
-  if (typeof value !== "object" || value === null) return false;
-  if (Object.prototype.toString.call(value) !== "[object Object]") return false;
-  const proto = Object.getPrototypeOf(value);
+function isPlainObject(value2) {
+  if (typeof value2 !== "object" || value2 === null) return false;
+  if (Object.prototype.toString.call(value2) !== "[object Object]") return false;
+  const proto = Object.getPrototypeOf(value2);
   if (proto === null) return true;
   const Ctor = Object.prototype.hasOwnProperty.call(proto, "constructor") && proto.constructor;
-  return typeof Ctor === "function" && Ctor instanceof Ctor && Function.prototype.call(Ctor) === Function.prototype.call(value);
+  return typeof Ctor === "function" && Ctor instanceof Ctor && Function.prototype.call(Ctor) === Function.prototype.call(value2);
 }
 function mergeDeep(defaults2, options) {
   const result = Object.assign({}, defaults2);
@@ -38590,11 +38590,11 @@ function merge(defaults2, route, options) {
 }
 function addQueryParameters(url, parameters) {
   const separator = /\?/.test(url) ? "&" : "?";
-  const names = Object.keys(parameters);
-  if (names.length === 0) {
+  const names2 = Object.keys(parameters);
+  if (names2.length === 0) {
     return url;
   }
-  return url + separator + names.map((name) => {
+  return url + separator + names2.map((name) => {
     if (name === "q") {
       return "q=" + parameters.q.split("+").map(encodeURIComponent).join("+");
     }
@@ -38633,57 +38633,57 @@ function encodeUnreserved(str) {
     return "%" + c.charCodeAt(0).toString(16).toUpperCase();
   });
 }
-function encodeValue(operator, value, key) {
-  value = operator === "+" || operator === "#" ? encodeReserved(value) : encodeUnreserved(value);
+function encodeValue(operator, value2, key) {
+  value2 = operator === "+" || operator === "#" ? encodeReserved(value2) : encodeUnreserved(value2);
   if (key) {
-    return encodeUnreserved(key) + "=" + value;
+    return encodeUnreserved(key) + "=" + value2;
   } else {
-    return value;
+    return value2;
   }
 }
-function isDefined(value) {
-  return value !== void 0 && value !== null;
+function isDefined(value2) {
+  return value2 !== void 0 && value2 !== null;
 }
 function isKeyOperator(operator) {
   return operator === ";" || operator === "&" || operator === "?";
 }
 function getValues(context3, operator, key, modifier) {
-  var value = context3[key], result = [];
-  if (isDefined(value) && value !== "") {
-    if (typeof value === "string" || typeof value === "number" || typeof value === "bigint" || typeof value === "boolean") {
-      value = value.toString();
+  var value2 = context3[key], result = [];
+  if (isDefined(value2) && value2 !== "") {
+    if (typeof value2 === "string" || typeof value2 === "number" || typeof value2 === "bigint" || typeof value2 === "boolean") {
+      value2 = value2.toString();
       if (modifier && modifier !== "*") {
-        value = value.substring(0, parseInt(modifier, 10));
+        value2 = value2.substring(0, parseInt(modifier, 10));
       }
       result.push(
-        encodeValue(operator, value, isKeyOperator(operator) ? key : "")
+        encodeValue(operator, value2, isKeyOperator(operator) ? key : "")
       );
     } else {
       if (modifier === "*") {
-        if (Array.isArray(value)) {
-          value.filter(isDefined).forEach(function(value2) {
+        if (Array.isArray(value2)) {
+          value2.filter(isDefined).forEach(function(value22) {
             result.push(
-              encodeValue(operator, value2, isKeyOperator(operator) ? key : "")
+              encodeValue(operator, value22, isKeyOperator(operator) ? key : "")
             );
           });
         } else {
-          Object.keys(value).forEach(function(k) {
-            if (isDefined(value[k])) {
-              result.push(encodeValue(operator, value[k], k));
+          Object.keys(value2).forEach(function(k) {
+            if (isDefined(value2[k])) {
+              result.push(encodeValue(operator, value2[k], k));
             }
           });
         }
       } else {
         const tmp = [];
-        if (Array.isArray(value)) {
-          value.filter(isDefined).forEach(function(value2) {
-            tmp.push(encodeValue(operator, value2));
+        if (Array.isArray(value2)) {
+          value2.filter(isDefined).forEach(function(value22) {
+            tmp.push(encodeValue(operator, value22));
           });
         } else {
-          Object.keys(value).forEach(function(k) {
-            if (isDefined(value[k])) {
+          Object.keys(value2).forEach(function(k) {
+            if (isDefined(value2[k])) {
               tmp.push(encodeUnreserved(k));
-              tmp.push(encodeValue(operator, value[k].toString()));
+              tmp.push(encodeValue(operator, value2[k].toString()));
             }
           });
         }
@@ -38696,12 +38696,12 @@ function getValues(context3, operator, key, modifier) {
     }
   } else {
     if (operator === ";") {
-      if (isDefined(value)) {
+      if (isDefined(value2)) {
         result.push(encodeUnreserved(key));
       }
-    } else if (value === "" && (operator === "&" || operator === "?")) {
+    } else if (value2 === "" && (operator === "&" || operator === "?")) {
       result.push(encodeUnreserved(key) + "=");
-    } else if (value === "") {
+    } else if (value2 === "") {
       result.push("");
     }
   }
@@ -38877,8 +38877,8 @@ function parse2(header, options) {
     index++;
   }
   const valueEnd = whitespace === -1 ? index : whitespace;
-  const value = header.slice(valueStart, valueEnd);
-  const type = (typeFlags & CASE_FLAGS) === 0 ? value : value.toLowerCase();
+  const value2 = header.slice(valueStart, valueEnd);
+  const type = (typeFlags & CASE_FLAGS) === 0 ? value2 : value2.toLowerCase();
   if (index === len || stop !== 0) {
     return { type, index, parameters: new NullObject() };
   }
@@ -38904,8 +38904,8 @@ function parseParameters(header, type, index, len, stopFlags) {
       }
       if (code === EQ) {
         const keyEnd = keyWhitespace === -1 ? index : keyWhitespace;
-        const value = header.slice(keyStart, keyEnd);
-        const key = (keyFlags & CASE_FLAGS) === 0 ? value : value.toLowerCase();
+        const value2 = header.slice(keyStart, keyEnd);
+        const key = (keyFlags & CASE_FLAGS) === 0 ? value2 : value2.toLowerCase();
         index++;
         while ((CHAR_MAP[header.charCodeAt(index)] & OWS) !== 0) {
           index++;
@@ -39205,12 +39205,12 @@ var init_json_with_bigint = __esm({
       }
       return chunks.join("");
     };
-    JSONStringify = (value, replacer, space) => {
+    JSONStringify = (value2, replacer, space) => {
       try {
         const supportsRawJSON = "rawJSON" in JSON;
         if (supportsRawJSON) {
           return originalStringify(
-            value,
+            value2,
             (key, val) => {
               if (typeof val === "bigint") return JSON.rawJSON(val.toString());
               const hasFunctionReplacer = typeof replacer === "function";
@@ -39222,9 +39222,9 @@ var init_json_with_bigint = __esm({
             space
           );
         }
-        if (!value) return originalStringify(value, replacer, space);
+        if (!value2) return originalStringify(value2, replacer, space);
         const convertedToCustomJSON = originalStringify(
-          value,
+          value2,
           (key, val) => {
             const isNoise = typeof val === "string" && noiseValue.test(val);
             if (isNoise) return val.toString() + "n";
@@ -39245,7 +39245,7 @@ var init_json_with_bigint = __esm({
         return denoisedJSON;
       } catch (error2) {
         if (error2 instanceof RangeError) {
-          const convertedJSON = stringifyIteratively(value, replacer, space);
+          const convertedJSON = stringifyIteratively(value2, replacer, space);
           if (convertedJSON === void 0) return void 0;
           const supportsRawJSON = "rawJSON" in JSON;
           if (supportsRawJSON) return convertedJSON;
@@ -39273,26 +39273,26 @@ var init_json_with_bigint = __esm({
         return false;
       }
     };
-    convertMarkedBigIntsReviver = (key, value, context3, userReviver) => {
-      const isCustomFormatBigInt = typeof value === "string" && customFormat.test(value);
-      if (isCustomFormatBigInt) return BigInt(value.slice(0, -1));
-      const isNoiseValue = typeof value === "string" && noiseValue.test(value);
-      if (isNoiseValue) return value.slice(0, -1);
+    convertMarkedBigIntsReviver = (key, value2, context3, userReviver) => {
+      const isCustomFormatBigInt = typeof value2 === "string" && customFormat.test(value2);
+      if (isCustomFormatBigInt) return BigInt(value2.slice(0, -1));
+      const isNoiseValue = typeof value2 === "string" && noiseValue.test(value2);
+      if (isNoiseValue) return value2.slice(0, -1);
       const hasUserReviver = typeof userReviver === "function";
-      if (!hasUserReviver) return value;
-      return userReviver(key, value, context3);
+      if (!hasUserReviver) return value2;
+      return userReviver(key, value2, context3);
     };
     JSONParseV2 = (text2, reviver) => {
-      return JSON.parse(text2, (key, value, context3) => {
-        const isNumber = typeof value === "number";
-        const isOutOfBounds = value > Number.MAX_SAFE_INTEGER || value < Number.MIN_SAFE_INTEGER;
+      return JSON.parse(text2, (key, value2, context3) => {
+        const isNumber = typeof value2 === "number";
+        const isOutOfBounds = value2 > Number.MAX_SAFE_INTEGER || value2 < Number.MIN_SAFE_INTEGER;
         const isBigNumber = isNumber && isOutOfBounds;
         const isInt = context3 && intRegex.test(context3.source);
         const isBigInt = isBigNumber && isInt;
         if (isBigInt) return BigInt(context3.source);
         const hasCustomReviver = typeof reviver === "function";
-        if (!hasCustomReviver) return value;
-        return reviver(key, value, context3);
+        if (!hasCustomReviver) return value2;
+        return reviver(key, value2, context3);
       });
     };
     MAX_INT = Number.MAX_SAFE_INTEGER.toString();
@@ -39306,35 +39306,35 @@ var init_json_with_bigint = __esm({
         const node = stack[stack.length - 1];
         if (!node.visited) {
           node.visited = true;
-          const value = node.parent[node.key];
-          const isComplexObject = value !== null && typeof value === "object";
+          const value2 = node.parent[node.key];
+          const isComplexObject = value2 !== null && typeof value2 === "object";
           if (isComplexObject) {
-            const keys = Object.keys(value);
+            const keys = Object.keys(value2);
             for (let i2 = keys.length - 1; i2 >= 0; i2--) {
-              stack.push({ parent: value, key: keys[i2], visited: false });
+              stack.push({ parent: value2, key: keys[i2], visited: false });
             }
           }
         } else {
           const { parent, key } = node;
-          let value = parent[key];
-          if (typeof value === "string") {
-            const isCustomFormatBigInt = customFormat.test(value);
+          let value2 = parent[key];
+          if (typeof value2 === "string") {
+            const isCustomFormatBigInt = customFormat.test(value2);
             if (isCustomFormatBigInt) {
-              value = BigInt(value.slice(0, -1));
+              value2 = BigInt(value2.slice(0, -1));
             } else {
-              const isNoise = noiseValue.test(value);
-              if (isNoise) value = value.slice(0, -1);
+              const isNoise = noiseValue.test(value2);
+              if (isNoise) value2 = value2.slice(0, -1);
             }
           }
           const hasUserReviver = typeof userReviver === "function";
           if (hasUserReviver) {
-            value = userReviver.call(parent, key, value);
+            value2 = userReviver.call(parent, key, value2);
           }
-          const isDeleted = value === void 0;
+          const isDeleted = value2 === void 0;
           if (isDeleted) {
             delete parent[key];
           } else {
-            parent[key] = value;
+            parent[key] = value2;
           }
           stack.pop();
         }
@@ -39344,12 +39344,12 @@ var init_json_with_bigint = __esm({
     serializeBigInts = (text2) => {
       return text2.replace(
         stringsOrLargeNumbers,
-        (match, digits, fractional, exponential) => {
+        (match, digits2, fractional, exponential) => {
           const isString = match[0] === '"';
           const isNoise = isString && noiseValueWithQuotes.test(match);
           if (isNoise) return match.substring(0, match.length - 1) + 'n"';
           const hasFractionalOrExponential = fractional || exponential;
-          const isLessThanMaxSafeInt = digits && (digits.length < MAX_DIGITS || digits.length === MAX_DIGITS && digits <= MAX_INT);
+          const isLessThanMaxSafeInt = digits2 && (digits2.length < MAX_DIGITS || digits2.length === MAX_DIGITS && digits2 <= MAX_INT);
           const isStandardValue = isString || hasFractionalOrExponential || isLessThanMaxSafeInt;
           if (isStandardValue) return match;
           return '"' + match + 'n"';
@@ -39363,7 +39363,7 @@ var init_json_with_bigint = __esm({
         const serializedData = serializeBigInts(text2);
         return originalParse(
           serializedData,
-          (key, value, context3) => convertMarkedBigIntsReviver(key, value, context3, reviver)
+          (key, value2, context3) => convertMarkedBigIntsReviver(key, value2, context3, reviver)
         );
       } catch (error2) {
         if (error2 instanceof RangeError) {
@@ -39422,13 +39422,13 @@ var init_dist_src = __esm({
 });
 
 // node_modules/@octokit/request/dist-bundle/index.js
-function isPlainObject2(value) {
-  if (typeof value !== "object" || value === null) return false;
-  if (Object.prototype.toString.call(value) !== "[object Object]") return false;
-  const proto = Object.getPrototypeOf(value);
+function isPlainObject2(value2) {
+  if (typeof value2 !== "object" || value2 === null) return false;
+  if (Object.prototype.toString.call(value2) !== "[object Object]") return false;
+  const proto = Object.getPrototypeOf(value2);
   if (proto === null) return true;
   const Ctor = Object.prototype.hasOwnProperty.call(proto, "constructor") && proto.constructor;
-  return typeof Ctor === "function" && Ctor instanceof Ctor && Function.prototype.call(Ctor) === Function.prototype.call(value);
+  return typeof Ctor === "function" && Ctor instanceof Ctor && Function.prototype.call(Ctor) === Function.prototype.call(value2);
 }
 async function fetchWrapper(requestOptions) {
   const fetch2 = requestOptions.request?.fetch || globalThis.fetch;
@@ -39441,9 +39441,9 @@ async function fetchWrapper(requestOptions) {
   const parseSuccessResponseBody = requestOptions.request?.parseSuccessResponseBody !== false;
   const body = isPlainObject2(requestOptions.body) || Array.isArray(requestOptions.body) ? JSONStringify(requestOptions.body) : requestOptions.body;
   const requestHeaders = Object.fromEntries(
-    Object.entries(requestOptions.headers).map(([name, value]) => [
+    Object.entries(requestOptions.headers).map(([name, value2]) => [
       name,
-      String(value)
+      String(value2)
     ])
   );
   let fetchResponse;
@@ -39483,8 +39483,8 @@ async function fetchWrapper(requestOptions) {
   const status = fetchResponse.status;
   const url = fetchResponse.url;
   const responseHeaders = {};
-  for (const [key, value] of fetchResponse.headers) {
-    responseHeaders[key] = value;
+  for (const [key, value2] of fetchResponse.headers) {
+    responseHeaders[key] = value2;
   }
   const octokitResponse = {
     url,
@@ -42459,8 +42459,8 @@ var init_endpoints_to_methods = __esm({
       ownKeys({ scope }) {
         return [...endpointMethodsMap.get(scope).keys()];
       },
-      set(target, methodName, value) {
-        return target.cache[methodName] = value;
+      set(target, methodName, value2) {
+        return target.cache[methodName] = value2;
       },
       get({ octokit, scope, cache }, methodName) {
         if (cache[methodName]) {
@@ -42553,14 +42553,14 @@ var require_light = __commonJS({
           this._last = null;
           this.length = 0;
         }
-        push(value) {
+        push(value2) {
           var node;
           this.length++;
           if (typeof this.incr === "function") {
             this.incr();
           }
           node = {
-            value,
+            value: value2,
             prev: this._last,
             next: null
           };
@@ -42573,7 +42573,7 @@ var require_light = __commonJS({
           return void 0;
         }
         shift() {
-          var value;
+          var value2;
           if (this._first == null) {
             return;
           } else {
@@ -42582,13 +42582,13 @@ var require_light = __commonJS({
               this.decr();
             }
           }
-          value = this._first.value;
+          value2 = this._first.value;
           if ((this._first = this._first.next) != null) {
             this._first.prev = null;
           } else {
             this._last = null;
           }
-          return value;
+          return value2;
         }
         first() {
           if (this._first != null) {
@@ -42929,7 +42929,7 @@ var require_light = __commonJS({
           var base;
           if (this.heartbeat == null && (this.storeOptions.reservoirRefreshInterval != null && this.storeOptions.reservoirRefreshAmount != null || this.storeOptions.reservoirIncreaseInterval != null && this.storeOptions.reservoirIncreaseAmount != null)) {
             return typeof (base = this.heartbeat = setInterval(() => {
-              var amount, incr, maximum, now, reservoir;
+              var amount2, incr, maximum, now, reservoir;
               now = Date.now();
               if (this.storeOptions.reservoirRefreshInterval != null && now >= this._lastReservoirRefresh + this.storeOptions.reservoirRefreshInterval) {
                 this._lastReservoirRefresh = now;
@@ -42938,12 +42938,12 @@ var require_light = __commonJS({
               }
               if (this.storeOptions.reservoirIncreaseInterval != null && now >= this._lastReservoirIncrease + this.storeOptions.reservoirIncreaseInterval) {
                 ({
-                  reservoirIncreaseAmount: amount,
+                  reservoirIncreaseAmount: amount2,
                   reservoirIncreaseMaximum: maximum,
                   reservoir
                 } = this.storeOptions);
                 this._lastReservoirIncrease = now;
-                incr = maximum != null ? Math.min(amount, maximum - reservoir) : amount;
+                incr = maximum != null ? Math.min(amount2, maximum - reservoir) : amount2;
                 if (incr > 0) {
                   this.storeOptions.reservoir += incr;
                   return this.instance._drainAll(this.computeCapacity());
@@ -44009,22 +44009,22 @@ var require_lib = __commonJS({
       };
     })();
     var __awaiter3 = exports && exports.__awaiter || function(thisArg, _arguments, P, generator) {
-      function adopt(value) {
-        return value instanceof P ? value : new P(function(resolve6) {
-          resolve6(value);
+      function adopt(value2) {
+        return value2 instanceof P ? value2 : new P(function(resolve6) {
+          resolve6(value2);
         });
       }
       return new (P || (P = Promise))(function(resolve6, reject) {
-        function fulfilled(value) {
+        function fulfilled(value2) {
           try {
-            step(generator.next(value));
+            step(generator.next(value2));
           } catch (e) {
             reject(e);
           }
         }
-        function rejected(value) {
+        function rejected(value2) {
           try {
-            step(generator["throw"](value));
+            step(generator["throw"](value2));
           } catch (e) {
             reject(e);
           }
@@ -44610,14 +44610,14 @@ var require_lib = __commonJS({
             if (statusCode === HttpCodes2.NotFound) {
               resolve6(response);
             }
-            function dateTimeDeserializer(key, value) {
-              if (typeof value === "string") {
-                const a = new Date(value);
+            function dateTimeDeserializer(key, value2) {
+              if (typeof value2 === "string") {
+                const a = new Date(value2);
                 if (!isNaN(a.valueOf())) {
                   return a;
                 }
               }
-              return value;
+              return value2;
             }
             let obj;
             let contents;
@@ -44704,22 +44704,22 @@ var init_utils = __esm({
     httpClient = __toESM(require_lib(), 1);
     import_undici2 = __toESM(require_undici(), 1);
     __awaiter2 = function(thisArg, _arguments, P, generator) {
-      function adopt(value) {
-        return value instanceof P ? value : new P(function(resolve6) {
-          resolve6(value);
+      function adopt(value2) {
+        return value2 instanceof P ? value2 : new P(function(resolve6) {
+          resolve6(value2);
         });
       }
       return new (P || (P = Promise))(function(resolve6, reject) {
-        function fulfilled(value) {
+        function fulfilled(value2) {
           try {
-            step(generator.next(value));
+            step(generator.next(value2));
           } catch (e) {
             reject(e);
           }
         }
-        function rejected(value) {
+        function rejected(value2) {
           try {
-            step(generator["throw"](value));
+            step(generator["throw"](value2));
           } catch (e) {
             reject(e);
           }
@@ -44882,9 +44882,9 @@ function issueFileCommand(command, message) {
     encoding: "utf8"
   });
 }
-function prepareKeyValueMessage(key, value) {
+function prepareKeyValueMessage(key, value2) {
   const delimiter = `ghadelimiter_${crypto.randomUUID()}`;
-  const convertedValue = toCommandValue(value);
+  const convertedValue = toCommandValue(value2);
   if (key.includes(delimiter)) {
     throw new Error(`Unexpected input: name should not contain the delimiter "${delimiter}"`);
   }
@@ -44956,22 +44956,22 @@ var HttpResponseRetryCodes = [
 import { EOL as EOL3 } from "os";
 import { constants, promises } from "fs";
 var __awaiter = function(thisArg, _arguments, P, generator) {
-  function adopt(value) {
-    return value instanceof P ? value : new P(function(resolve6) {
-      resolve6(value);
+  function adopt(value2) {
+    return value2 instanceof P ? value2 : new P(function(resolve6) {
+      resolve6(value2);
     });
   }
   return new (P || (P = Promise))(function(resolve6, reject) {
-    function fulfilled(value) {
+    function fulfilled(value2) {
       try {
-        step(generator.next(value));
+        step(generator.next(value2));
       } catch (e) {
         reject(e);
       }
     }
-    function rejected(value) {
+    function rejected(value2) {
       try {
-        step(generator["throw"](value));
+        step(generator["throw"](value2));
       } catch (e) {
         reject(e);
       }
@@ -45022,7 +45022,7 @@ var Summary = class {
    * @returns {string} content wrapped in HTML element
    */
   wrap(tag, content, attrs = {}) {
-    const htmlAttrs = Object.entries(attrs).map(([key, value]) => ` ${key}="${value}"`).join("");
+    const htmlAttrs = Object.entries(attrs).map(([key, value2]) => ` ${key}="${value2}"`).join("");
     if (!content) {
       return `<${tag}${htmlAttrs}>`;
     }
@@ -45272,13 +45272,13 @@ function getInput(name, options) {
   }
   return val.trim();
 }
-function setOutput(name, value) {
+function setOutput(name, value2) {
   const filePath = process.env["GITHUB_OUTPUT"] || "";
   if (filePath) {
-    return issueFileCommand("OUTPUT", prepareKeyValueMessage(name, value));
+    return issueFileCommand("OUTPUT", prepareKeyValueMessage(name, value2));
   }
   process.stdout.write(os4.EOL);
-  issueCommand("set-output", { name }, toCommandValue(value));
+  issueCommand("set-output", { name }, toCommandValue(value2));
 }
 function setFailed(message) {
   process.exitCode = ExitCode.Failure;
@@ -45303,15 +45303,15 @@ function formatIssue(issue2) {
   if (issue2.hint !== void 0) text2 += ` ${issue2.hint}`;
   return text2;
 }
-function quote(value) {
+function quote(value2) {
   let text2;
-  if (typeof value === "string") text2 = JSON.stringify(value);
-  else if (typeof value === "number" && !Number.isFinite(value)) text2 = String(value);
+  if (typeof value2 === "string") text2 = JSON.stringify(value2);
+  else if (typeof value2 === "number" && !Number.isFinite(value2)) text2 = String(value2);
   else {
     try {
-      text2 = JSON.stringify(value) ?? String(value);
+      text2 = JSON.stringify(value2) ?? String(value2);
     } catch {
-      text2 = String(value);
+      text2 = String(value2);
     }
   }
   return text2.length > 60 ? `${text2.slice(0, 57)}...` : text2;
@@ -45362,7 +45362,7 @@ function handleFailure(error2) {
 // src/entries/action/io.ts
 function coreIO() {
   return {
-    setOutput: (name, value) => setOutput(name, value),
+    setOutput: (name, value2) => setOutput(name, value2),
     info: (message) => info(message),
     warning: (message) => warning(message),
     setFailed: (message) => setFailed(message),
@@ -46043,10 +46043,10 @@ import { join } from "node:path";
 var MAX_MAGNITUDE = 1e15;
 var MAX_CURVE_POINTS = 1e4;
 var MAX_JSON_DEPTH = 64;
-function formatLimit(value) {
-  if (value !== 0 && (Math.abs(value) >= 1e6 || Math.abs(value) < 1e-6))
-    return value.toExponential().replace("e+", "e");
-  return String(value);
+function formatLimit(value2) {
+  if (value2 !== 0 && (Math.abs(value2) >= 1e6 || Math.abs(value2) < 1e-6))
+    return value2.toExponential().replace("e+", "e");
+  return String(value2);
 }
 
 // src/validate/ajv-issues.ts
@@ -46063,15 +46063,15 @@ function valueAt(doc, pointer) {
 function escapePointerToken(token) {
   return token.replace(/~/g, "~0").replace(/\//g, "~1");
 }
-function typeName(value) {
-  if (value === null) return "null";
-  if (Array.isArray(value)) return "an array";
-  if (typeof value === "object") return "an object";
-  return `${typeof value} ${quote(value)}`;
+function typeName(value2) {
+  if (value2 === null) return "null";
+  if (Array.isArray(value2)) return "an array";
+  if (typeof value2 === "object") return "an object";
+  return `${typeof value2} ${quote(value2)}`;
 }
 function oneIssue(error2, file, doc) {
   const pointer = error2.instancePath;
-  const value = valueAt(doc, pointer);
+  const value2 = valueAt(doc, pointer);
   const params = error2.params;
   switch (error2.keyword) {
     case "required":
@@ -46095,29 +46095,29 @@ function oneIssue(error2, file, doc) {
         file,
         pointer,
         expected: `must be ${String(params["type"]) === "integer" ? "an integer" : `of type ${String(params["type"])}`}`,
-        got: typeName(value),
-        ...params["type"] === "number" && typeof value === "string" ? { hint: "Write numbers without quotes." } : {}
+        got: typeName(value2),
+        ...params["type"] === "number" && typeof value2 === "string" ? { hint: "Write numbers without quotes." } : {}
       };
     case "enum":
       return {
         file,
         pointer,
         expected: `must be one of ${params["allowedValues"].map((v) => quote(v)).join(", ")}`,
-        got: quote(value)
+        got: quote(value2)
       };
     case "const":
       return {
         file,
         pointer,
         expected: `must be ${quote(params["allowedValue"])}`,
-        got: quote(value)
+        got: quote(value2)
       };
     case "format":
       return {
         file,
         pointer,
         expected: `must be a ${String(params["format"])} string`,
-        got: quote(value),
+        got: quote(value2),
         ...params["format"] === "date-time" ? { hint: 'Use RFC 3339, e.g. "2026-11-30T10:00:00Z".' } : {}
       };
     default:
@@ -46125,7 +46125,7 @@ function oneIssue(error2, file, doc) {
         file,
         pointer,
         expected: error2.message ?? `fails ${error2.keyword}`,
-        got: quote(value)
+        got: quote(value2)
       };
   }
 }
@@ -46305,8 +46305,8 @@ var LIMIT_RANGES_MB = {
 };
 function parseLimitMb(key, text2, label) {
   const { min, max: max2 } = LIMIT_RANGES_MB[key];
-  const value = /^\s*(?:\d+(?:\.\d*)?|\.\d+)\s*$/.test(text2) ? Number(text2) : Number.NaN;
-  if (!(value >= min && value <= max2)) {
+  const value2 = /^\s*(?:\d+(?:\.\d*)?|\.\d+)\s*$/.test(text2) ? Number(text2) : Number.NaN;
+  if (!(value2 >= min && value2 <= max2)) {
     return {
       issues: [
         {
@@ -46318,7 +46318,7 @@ function parseLimitMb(key, text2, label) {
       ]
     };
   }
-  return { bytes: Math.round(value * MIB) };
+  return { bytes: Math.round(value2 * MIB) };
 }
 var LIMIT_HINTS = {
   artifactBytes: 'Raise the limit with --max-artifact-mb (action input "max-artifact-mb", config limits.artifact-mb) if the file is genuine.',
@@ -46641,9 +46641,116 @@ async function extractBundle(options) {
 import { createHash as createHash2 } from "node:crypto";
 import { resolve as resolve3 } from "node:path";
 
+// src/model/settings.ts
+var FAIL_ON_VALUES = [
+  "worse-validation",
+  "toward-overfitting",
+  "toward-underfitting",
+  "worse-on-both",
+  "any-movement",
+  "slice-regression",
+  "high-bias",
+  "high-variance",
+  "data-mismatch",
+  "validation-overfit",
+  "guardrail-regression",
+  "guardrail-undetermined",
+  "none"
+];
+var COST_OUTCOME_FIELDS = /* @__PURE__ */ new Map([
+  ["train-seconds", "trainSeconds"],
+  ["inference-ms", "inferenceMs"],
+  ["parameters", "parameters"],
+  ["memory-mb", "memoryMb"]
+]);
+var COST_RATIO_OUTCOME = /^(train-seconds|inference-ms|parameters|memory-mb)-ratio>((?:0|[1-9][0-9]*)(?:\.[0-9]+)?)$/;
+function isFailOn(value2) {
+  return FAIL_ON_VALUES.includes(value2) || COST_RATIO_OUTCOME.test(value2);
+}
+var DEFAULT_SETTINGS = {
+  alpha: 0.05,
+  minEffect: 0,
+  gapTolerance: 0.1,
+  failOn: ["worse-validation"]
+};
+var NUMBER_SETTINGS = {
+  alpha: { min: 1e-6, max: 0.5, about: "significance level" },
+  "min-effect": { min: 0, max: MAX_MAGNITUDE, about: "smallest change that counts" },
+  "gap-tolerance": { min: 0, max: 1, about: "component present at this fraction of the error" },
+  reference: { min: -MAX_MAGNITUDE, max: MAX_MAGNITUDE, about: "reference level" }
+};
+var DECIMAL = /^[+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:[eE][+-]?\d+)?$/;
+function parseDecimal(text2) {
+  const trimmed = text2.trim();
+  if (!DECIMAL.test(trimmed)) return null;
+  const value2 = Number(trimmed);
+  return Number.isFinite(value2) ? value2 : null;
+}
+function rangeText(name) {
+  const { min, max: max2 } = NUMBER_SETTINGS[name];
+  return `must be a number from ${formatLimit(min)} to ${formatLimit(max2)}`;
+}
+function numberSettingIssues(name, value2, source) {
+  const { min, max: max2 } = NUMBER_SETTINGS[name];
+  if (Number.isFinite(value2) && value2 >= min && value2 <= max2) return [];
+  return [{ ...source, expected: rangeText(name), got: quote(value2) }];
+}
+function parseNumberSetting(name, text2, source) {
+  const value2 = parseDecimal(text2);
+  if (value2 === null)
+    return { issues: [{ ...source, expected: rangeText(name), got: quote(text2) }] };
+  const issues = numberSettingIssues(name, value2, source);
+  return issues.length > 0 ? { issues } : { value: value2 };
+}
+var FAIL_ON_SEPARATORS = /[,\n]/;
+function failOnIssues(values, source) {
+  const at = (i2) => source.pointer === "" ? "" : `${source.pointer}/${i2}`;
+  if (values.length === 0) {
+    return [
+      {
+        ...source,
+        expected: "must name at least one outcome",
+        got: "an empty list",
+        hint: "Write 'none' for a gate that never fails, or leave the setting out for the default (worse-validation)."
+      }
+    ];
+  }
+  const issues = values.flatMap(
+    (value2, i2) => isFailOn(value2) ? [] : [
+      {
+        ...source,
+        pointer: at(i2),
+        expected: `must be one of ${FAIL_ON_VALUES.join(", ")}, or FIELD-ratio>X (FIELD one of ${[...COST_OUTCOME_FIELDS.keys()].join(", ")})`,
+        got: quote(value2),
+        hint: "Separate outcomes with commas or new lines."
+      }
+    ]
+  );
+  if (issues.length === 0 && values.length > 1 && values.includes("none")) {
+    issues.push({
+      ...source,
+      pointer: at(values.indexOf("none")),
+      expected: "must not combine 'none' with other outcomes",
+      got: quote(values.join(","))
+    });
+  }
+  return issues;
+}
+function parseFailOn(text2, source) {
+  const values = text2.split(FAIL_ON_SEPARATORS).map((s) => s.trim()).filter((s) => s !== "");
+  const issues = failOnIssues(values, source);
+  return issues.length > 0 ? { issues } : { value: values };
+}
+
 // src/model/run.ts
 var SPLIT_NAMES = ["train", "train_dev", "validation", "test"];
 var CURVE_NAMES = ["epochs", "training_examples", "regularization"];
+var COST_FIELDS = [
+  "trainSeconds",
+  "inferenceMs",
+  "parameters",
+  "memoryMb"
+];
 
 // src/stats/distributions.ts
 var import_jstat = __toESM(require_jstat(), 1);
@@ -46657,14 +46764,14 @@ function assertAlpha(alpha) {
 function assertProbability(name, p) {
   if (!(p >= 0 && p <= 1)) throw new RangeError(`${name} must be in [0, 1]; got ${p}`);
 }
-function assertCount(name, value) {
-  if (!Number.isSafeInteger(value) || value < 0) {
-    throw new RangeError(`${name} must be a non-negative integer count; got ${value}`);
+function assertCount(name, value2) {
+  if (!Number.isSafeInteger(value2) || value2 < 0) {
+    throw new RangeError(`${name} must be a non-negative integer count; got ${value2}`);
   }
 }
-function assertFinite(name, value) {
-  if (!Number.isFinite(value))
-    throw new RangeError(`${name} must be a finite number; got ${value}`);
+function assertFinite(name, value2) {
+  if (!Number.isFinite(value2))
+    throw new RangeError(`${name} must be a finite number; got ${value2}`);
 }
 function assertFiniteValues(name, values) {
   for (let i2 = 0; i2 < values.length; i2++) {
@@ -46690,9 +46797,9 @@ function assertOpenProbability(p) {
   if (!(p > 0 && p < 1)) throw new RangeError(`p must be in (0, 1) for a quantile; got ${p}`);
 }
 function ibeta(x2, a, b) {
-  const value = import_jstat.default.ibeta(x2, a, b);
-  if (value === false) throw new RangeError(`incomplete beta argument must be in [0, 1]; got ${x2}`);
-  return Math.min(1, Math.max(0, value));
+  const value2 = import_jstat.default.ibeta(x2, a, b);
+  if (value2 === false) throw new RangeError(`incomplete beta argument must be in [0, 1]; got ${x2}`);
+  return Math.min(1, Math.max(0, value2));
 }
 function normalCdf(x2) {
   if (Number.isNaN(x2)) throw new RangeError("normalCdf: x must be a number; got NaN");
@@ -46799,8 +46906,8 @@ function tInference(estimate, se2, df, alpha) {
   const p = Math.min(1, 2 * tCdf(-Math.abs(statistic), df));
   return { estimate, ci: [estimate - half, estimate + half], p, df, statistic };
 }
-function toResult(summary2, test) {
-  return { ...summary2, test };
+function toResult(summary2, test2) {
+  return { ...summary2, test: test2 };
 }
 function welchT(baseline, candidate, alpha) {
   assertAlpha(alpha);
@@ -46844,20 +46951,20 @@ function checkGroup(name, values) {
 }
 
 // src/stats/proportions.ts
-function normalTest(estimate, variance, alpha, test = "z-binomial") {
+function normalTest(estimate, variance, alpha, test2 = "z-binomial") {
   assertAlpha(alpha);
   assertFinite("normalTest estimate", estimate);
   if (!(variance >= 0) || !Number.isFinite(variance)) {
     throw new RangeError(`normalTest variance must be a finite number >= 0; got ${variance}`);
   }
   if (variance === 0) {
-    return { estimate, ci: [estimate, estimate], p: estimate === 0 ? 1 : 0, test };
+    return { estimate, ci: [estimate, estimate], p: estimate === 0 ? 1 : 0, test: test2 };
   }
   const se = Math.sqrt(variance);
   const statistic = estimate / se;
   const half = normalQuantile(1 - alpha / 2) * se;
   const p = Math.min(1, 2 * normalCdf(-Math.abs(statistic)));
-  return { estimate, ci: [estimate - half, estimate + half], p, test, statistic };
+  return { estimate, ci: [estimate - half, estimate + half], p, test: test2, statistic };
 }
 function binomialVariance(p, n) {
   assertProbability("binomialVariance p", p);
@@ -46868,11 +46975,16 @@ function binomialVariance(p, n) {
 }
 function wilsonInterval(successes, n, alpha) {
   assertAlpha(alpha);
+  return wilsonAtZ(successes, n, normalQuantile(1 - alpha / 2));
+}
+function wilsonAtZ(successes, n, z) {
   assertCount("successes", successes);
   assertCount("n", n);
   if (successes > n) throw new RangeError(`successes (${successes}) must not exceed n (${n})`);
+  if (!(z >= 0) || !Number.isFinite(z)) {
+    throw new RangeError(`z must be a finite number >= 0; got ${z}`);
+  }
   if (n === 0) return [0, 1];
-  const z = normalQuantile(1 - alpha / 2);
   const z2 = z * z;
   const centre = (successes + z2 / 2) / (n + z2);
   const half = z / (n + z2) * Math.sqrt(successes * (n - successes) / n + z2 / 4);
@@ -46902,22 +47014,1025 @@ function mcnemarExact(b, c, n, alpha) {
 // src/stats/holm.ts
 function holmAdjust(p) {
   const present = [];
-  p.forEach((value, index) => {
-    if (value === null) return;
-    if (!(value >= 0 && value <= 1)) {
-      throw new RangeError(`holmAdjust: p[${index}] must be in [0, 1] or null; got ${value}`);
+  p.forEach((value2, index) => {
+    if (value2 === null) return;
+    if (!(value2 >= 0 && value2 <= 1)) {
+      throw new RangeError(`holmAdjust: p[${index}] must be in [0, 1] or null; got ${value2}`);
     }
-    present.push({ index, value });
+    present.push({ index, value: value2 });
   });
   present.sort((a, b) => a.value - b.value);
   const m = present.length;
   const out = p.map(() => null);
   let running = 0;
-  present.forEach(({ index, value }, rank) => {
-    running = Math.max(running, Math.min(1, (m - rank) * value));
+  present.forEach(({ index, value: value2 }, rank) => {
+    running = Math.max(running, Math.min(1, (m - rank) * value2));
     out[index] = running;
   });
   return out;
+}
+
+// src/stats/non-inferiority.ts
+function welchWorsening(baseline, candidate) {
+  for (const [name, values] of [
+    ["baseline", baseline],
+    ["candidate", candidate]
+  ]) {
+    assertMinLength(name, values, 2);
+    assertFiniteValues(name, values);
+  }
+  const v1 = sampleVariance(baseline) / baseline.length;
+  const v2 = sampleVariance(candidate) / candidate.length;
+  const se2 = v1 + v2;
+  const df = se2 === 0 ? baseline.length + candidate.length - 2 : se2 * se2 / (v1 * v1 / (baseline.length - 1) + v2 * v2 / (candidate.length - 1));
+  return { estimate: mean(candidate) - mean(baseline), se: Math.sqrt(se2), df };
+}
+function upperTail(statistic, df) {
+  return df === null ? normalCdf(-statistic) : tCdf(-statistic, df);
+}
+function nonInferiorityTest(worsening, margin, alpha) {
+  assertAlpha(alpha);
+  assertFinite("worsening estimate", worsening.estimate);
+  assertFinite("margin", margin);
+  const { estimate, se, df } = worsening;
+  if (!(se >= 0) || !Number.isFinite(se)) {
+    throw new RangeError(`standard error must be a finite number >= 0; got ${se}`);
+  }
+  if (df !== null && !(df > 0)) throw new RangeError(`df must be > 0 or null; got ${df}`);
+  if (se === 0) {
+    const below = estimate < margin;
+    const above = estimate > margin;
+    return {
+      bounds: [estimate, estimate],
+      pNonInferior: below ? 0 : 1,
+      pInferior: above ? 0 : 1
+    };
+  }
+  const quantile = df === null ? normalQuantile(1 - alpha) : tQuantile(1 - alpha, df);
+  const statistic = (estimate - margin) / se;
+  return {
+    bounds: [estimate - quantile * se, estimate + quantile * se],
+    pNonInferior: upperTail(-statistic, df),
+    pInferior: upperTail(statistic, df)
+  };
+}
+function nonInferiorityCalls(tests, alpha) {
+  assertAlpha(alpha);
+  const nonInferior = holmAdjust(tests.map((t) => t === null ? null : t.pNonInferior));
+  const inferior = holmAdjust(tests.map((t) => t === null ? null : t.pInferior));
+  return tests.map((t, i2) => {
+    if (t === null) return { call: null, pNonInferior: null, pInferior: null };
+    const pNi = nonInferior[i2] ?? 1;
+    const pInf = inferior[i2] ?? 1;
+    const call = pNi < alpha ? "non-inferior" : pInf < alpha ? "inferior" : "undetermined";
+    return { call, pNonInferior: pNi, pInferior: pInf };
+  });
+}
+
+// src/stats/ratio.ts
+function geometricMean(values) {
+  if (values.length === 1) return values[0];
+  let sum = 0;
+  for (const v of values) sum += Math.log(v);
+  return Math.exp(sum / values.length);
+}
+function logRatio(baseline, candidate, alpha) {
+  assertAlpha(alpha);
+  for (const [name, values] of [
+    ["baseline", baseline],
+    ["candidate", candidate]
+  ]) {
+    if (values.length === 0) throw new RangeError(`${name} needs at least 1 value; got 0`);
+    values.forEach((v, i2) => {
+      if (!(v > 0) || !Number.isFinite(v)) {
+        throw new RangeError(`${name}[${i2}] must be a positive finite number; got ${v}`);
+      }
+    });
+  }
+  const ratio2 = geometricMean(candidate) / geometricMean(baseline);
+  if (baseline.length < 2 || candidate.length < 2) return { ratio: ratio2, ci: null, p: null };
+  const test2 = welchT(baseline.map(Math.log), candidate.map(Math.log), alpha);
+  const ci = test2.ci;
+  return {
+    ratio: ratio2,
+    ci: ci === null ? null : [Math.exp(ci[0]), Math.exp(ci[1])],
+    p: test2.p
+  };
+}
+
+// src/stats/noncentral-t.ts
+var import_jstat2 = __toESM(require_jstat(), 1);
+
+// src/analysis/measure.ts
+function shortfallSign(run) {
+  return run.metric.goal === "minimize" ? 1 : -1;
+}
+function splitMeasure(split) {
+  return { terms: [{ split, weight: 1 }], constant: 0 };
+}
+function perRepeat(run, measure) {
+  const sign = shortfallSign(run);
+  const columns = [];
+  for (const term of measure.terms) {
+    const split = run.splits[term.split];
+    if (split === void 0) return null;
+    columns.push({ values: split.values, weight: term.weight });
+  }
+  const repeats = run.splits.train.values.length;
+  const out = [];
+  for (let i2 = 0; i2 < repeats; i2++) {
+    let total = measure.constant;
+    for (const column of columns) total += column.weight * sign * (column.values[i2] ?? Number.NaN);
+    out.push(total);
+  }
+  return out;
+}
+function binomialMeasureVariance(run, measure) {
+  if (run.metric.kind !== "proportion") return null;
+  let total = 0;
+  for (const term of measure.terms) {
+    const split = run.splits[term.split];
+    if (split?.examples === void 0) return null;
+    const repeats = split.values.length;
+    total += term.weight * term.weight * binomialVariance(mean(split.values), split.examples * repeats);
+  }
+  return total;
+}
+
+// src/analysis/noise.ts
+function callOf(result, settings) {
+  const big = Math.abs(result.estimate) >= settings.minEffect && result.estimate !== 0;
+  const significant = result.p === null ? settings.minEffect > 0 : result.p < settings.alpha;
+  if (!big || !significant) return "flat";
+  return result.estimate > 0 ? "up" : "down";
+}
+function toShortfallDelta(result, settings) {
+  return { unit: "shortfall", ...deltaFields(result, settings) };
+}
+function toMetricDelta(result, settings) {
+  return { unit: "metric", ...deltaFields(result, settings) };
+}
+function deltaFields(result, settings) {
+  return {
+    estimate: result.estimate,
+    ci: result.ci,
+    p: result.p,
+    test: result.test,
+    call: callOf(result, settings)
+  };
+}
+function measureChange(baseline, candidate, measure, alpha) {
+  const b = perRepeat(baseline, measure.baseline);
+  const c = perRepeat(candidate, measure.candidate);
+  if (b === null || c === null) return null;
+  const estimate = mean(c) - mean(b);
+  if (b.length >= 2 && c.length >= 2) return welchT(b, c, alpha);
+  const vb = binomialMeasureVariance(baseline, measure.baseline);
+  const vc = binomialMeasureVariance(candidate, measure.candidate);
+  if (vb !== null && vc !== null) return normalTest(estimate, vb + vc, alpha, "z-binomial");
+  return { estimate, ci: null, p: null, test: "none" };
+}
+function measureLevel(run, measure, alpha) {
+  const values = perRepeat(run, measure);
+  if (values === null) return null;
+  const value2 = mean(values);
+  if (values.length >= 2) {
+    const t = oneSampleT(values, alpha);
+    return { value: value2, ci: t.ci, p: t.pGreater };
+  }
+  const variance = binomialMeasureVariance(run, measure);
+  if (variance !== null) {
+    const z = normalTest(value2, variance, alpha, "z-binomial");
+    const p = variance > 0 ? 1 - normalCdf(value2 / Math.sqrt(variance)) : value2 > 0 ? 0 : 1;
+    return { value: value2, ci: z.ci, p };
+  }
+  return { value: value2, ci: null, p: null };
+}
+function toMetricUnits(result, sign) {
+  if (sign === 1) return result;
+  return {
+    ...result,
+    estimate: -result.estimate,
+    ci: result.ci === null ? null : [-result.ci[1], -result.ci[0]],
+    ...result.statistic === void 0 ? {} : { statistic: -result.statistic }
+  };
+}
+
+// src/analysis/decompose.ts
+function chooseReference(run, override) {
+  if (override !== void 0) return { value: override, source: "config" };
+  if (run.reference !== void 0) return { value: run.reference, source: "artifact" };
+  if (run.metric.kind === "proportion" && run.metric.goal === "minimize")
+    return { value: 0, source: "default" };
+  return { value: null, source: "unknown" };
+}
+function componentMeasures(run, reference) {
+  const sign = shortfallSign(run);
+  const hasDev = run.splits.train_dev !== void 0;
+  return {
+    bias: reference === null ? null : { terms: [{ split: "train", weight: 1 }], constant: -sign * reference },
+    variance: {
+      terms: [
+        { split: hasDev ? "train_dev" : "validation", weight: 1 },
+        { split: "train", weight: -1 }
+      ],
+      constant: 0
+    },
+    mismatch: hasDev ? {
+      terms: [
+        { split: "validation", weight: 1 },
+        { split: "train_dev", weight: -1 }
+      ],
+      constant: 0
+    } : null,
+    overfit: run.splits.test !== void 0 ? {
+      terms: [
+        { split: "test", weight: 1 },
+        { split: "validation", weight: -1 }
+      ],
+      constant: 0
+    } : null
+  };
+}
+function errorLevel(run) {
+  const m = mean(run.splits.validation.values);
+  return Math.abs(run.metric.goal === "minimize" ? m : 1 - m);
+}
+var UNAVAILABLE = /* @__PURE__ */ new Map([
+  ["bias", "no-reference"],
+  ["mismatch", "no-train-dev"],
+  ["overfit", "no-test"]
+]);
+function decompose(run, reference, settings) {
+  const measures = componentMeasures(run, reference);
+  const threshold = Math.max(settings.gapTolerance * errorLevel(run), settings.minEffect);
+  const out = {};
+  for (const name of ["bias", "variance", "mismatch", "overfit"]) {
+    const measure = measures[name];
+    const level = measure === null ? null : measureLevel(run, measure, settings.alpha);
+    if (level === null) {
+      const unavailable = UNAVAILABLE.get(name);
+      if (unavailable === void 0) throw new Error(`${name} needs splits every run has`);
+      out[name] = { name, value: null, unavailable, ci: null, p: null, present: false };
+      continue;
+    }
+    const significant = level.p === null || level.p < settings.alpha;
+    const present = level.value > 0 && level.value >= threshold && significant;
+    out[name] = { name, value: level.value, ci: level.ci, p: level.p, present };
+  }
+  return out;
+}
+function diagnose(components) {
+  const candidates = ["bias", "variance", "mismatch"].map((name) => components[name]).filter((c) => c.present && c.value !== null).sort((a, b) => (b.value ?? 0) - (a.value ?? 0));
+  const top = candidates[0];
+  if (top === void 0) return "good-fit";
+  const bias = components.bias;
+  const variance = components.variance;
+  if (bias.present && variance.present && bias.value !== null && variance.value !== null) {
+    const ratio2 = Math.max(bias.value, variance.value) / Math.min(bias.value, variance.value);
+    if (ratio2 <= 2 && (top.name === "bias" || top.name === "variance"))
+      return "high-bias-and-variance";
+  }
+  if (top.name === "bias") return "high-bias";
+  if (top.name === "variance") return "high-variance";
+  return "data-mismatch";
+}
+
+// src/analysis/changes.ts
+function both(measure) {
+  return { baseline: measure, candidate: measure };
+}
+function pairedTest(paired, run, alpha) {
+  if (paired.rows === 0) return null;
+  if (paired.kind === "proportion") {
+    const result = mcnemarExact(
+      paired.baselineOnly ?? 0,
+      paired.candidateOnly ?? 0,
+      paired.rows,
+      alpha
+    );
+    return run.metric.goal === "minimize" ? toMetricUnits(result, -1) : result;
+  }
+  return pairedT(
+    { n: paired.rows, mean: paired.meanDiff ?? 0, variance: paired.varDiff ?? 0 },
+    alpha
+  );
+}
+function splitShortfalls(runs, alpha, paired) {
+  const pairedSplit = paired?.split ?? "validation";
+  const sign = shortfallSign(runs.candidate);
+  const out = /* @__PURE__ */ new Map();
+  for (const split of SPLIT_NAMES) {
+    let result = measureChange(runs.baseline, runs.candidate, both(splitMeasure(split)), alpha);
+    if (result === null) continue;
+    if (paired !== void 0 && split === pairedSplit && (result.test === "none" || result.test === "z-binomial")) {
+      const test2 = pairedTest(paired, runs.candidate, alpha);
+      if (test2 !== null) result = toMetricUnits(test2, sign);
+    }
+    out.set(split, result);
+  }
+  return out;
+}
+function splitChanges(shortfalls, runs, summaries, calls) {
+  const sign = shortfallSign(runs.candidate);
+  const out = [];
+  for (const [split, result] of shortfalls) {
+    const b = summaries.baseline.splits.find((s) => s.split === split);
+    const c = summaries.candidate.splits.find((s) => s.split === split);
+    if (b === void 0 || c === void 0) continue;
+    out.push({
+      split,
+      baseline: b.mean,
+      candidate: c.mean,
+      delta: toMetricDelta(toMetricUnits(result, sign), calls)
+    });
+  }
+  return out;
+}
+function componentChanges(runs, references, calls) {
+  const { baseline, candidate } = runs;
+  const alpha = calls.alpha;
+  const refB = references.baseline;
+  const refC = references.candidate;
+  const [biasRefB, biasRefC] = refB !== null && refC !== null ? [refB, refC] : [0, 0];
+  const bias = measureChange(
+    baseline,
+    candidate,
+    {
+      baseline: componentMeasures(baseline, biasRefB).bias ?? splitMeasure("train"),
+      candidate: componentMeasures(candidate, biasRefC).bias ?? splitMeasure("train")
+    },
+    alpha
+  );
+  const change2 = (name) => {
+    const mb = componentMeasures(baseline, refB)[name];
+    const mc = componentMeasures(candidate, refC)[name];
+    if (mb === null || mc === null) return null;
+    const r = measureChange(baseline, candidate, { baseline: mb, candidate: mc }, alpha);
+    return r === null ? null : toShortfallDelta(r, calls);
+  };
+  const varianceFallback = baseline.splits.train_dev === void 0 !== (candidate.splits.train_dev === void 0);
+  const variance = varianceFallback ? validationMinusTrain(runs, calls) : change2("variance");
+  if (variance === null)
+    throw new Error("variance needs train and validation, which the schema requires");
+  return {
+    bias: bias === null ? null : toShortfallDelta(bias, calls),
+    variance,
+    mismatch: change2("mismatch"),
+    overfit: change2("overfit"),
+    varianceFallback
+  };
+}
+function validationMinusTrain(runs, calls) {
+  const measure = {
+    terms: [
+      { split: "validation", weight: 1 },
+      { split: "train", weight: -1 }
+    ],
+    constant: 0
+  };
+  const r = measureChange(runs.baseline, runs.candidate, both(measure), calls.alpha);
+  return r === null ? null : toShortfallDelta(r, calls);
+}
+
+// src/analysis/cost.ts
+var asList = (value2) => value2 === void 0 ? null : Array.isArray(value2) ? value2 : [value2];
+function reviewCost(baseline, candidate, alpha) {
+  const out = {};
+  for (const field of COST_FIELDS) {
+    const b = asList(baseline.cost?.[field]);
+    const c = asList(candidate.cost?.[field]);
+    if (b === null || c === null) continue;
+    const r = logRatio(b, c, alpha);
+    const geometric = (values) => values.length === 1 ? values[0] : Math.exp(values.reduce((s, v) => s + Math.log(v), 0) / values.length);
+    const single = !Array.isArray(candidate.cost?.[field]);
+    let call;
+    if (r.p !== null) call = r.p < alpha ? r.ratio > 1 ? "up" : "down" : "flat";
+    else if (single) call = r.ratio > 1 ? "up" : r.ratio < 1 ? "down" : "flat";
+    else call = "undetermined";
+    out[field] = {
+      baseline: geometric(b),
+      candidate: geometric(c),
+      ratio: r.ratio,
+      ci: r.ci,
+      p: r.p,
+      call
+    };
+  }
+  return out;
+}
+
+// src/analysis/gate.ts
+function guardrailsWith(r, call) {
+  return (r.guardrails ?? []).filter((g) => g.nonInferiority === call).map((g) => g.name);
+}
+function costRule(policy) {
+  const match = COST_RATIO_OUTCOME.exec(policy);
+  if (match === null) return void 0;
+  const field = COST_OUTCOME_FIELDS.get(match[1]);
+  const limit = Number(match[2]);
+  return (r) => {
+    const ratio2 = field === void 0 ? void 0 : r.cost?.[field]?.ratio;
+    return ratio2 !== void 0 && ratio2 > limit ? { outcome: policy, ratio: ratio2 } : null;
+  };
+}
+var RULES = /* @__PURE__ */ new Map([
+  ["worse-validation", (r) => fired(r.validation.change === "worse", "worse-validation")],
+  ["toward-overfitting", (r) => fired(r.movement === "toward-overfitting", "toward-overfitting")],
+  [
+    "toward-underfitting",
+    (r) => fired(r.movement === "toward-underfitting", "toward-underfitting")
+  ],
+  ["worse-on-both", (r) => fired(r.movement === "worse-on-both", "worse-on-both")],
+  ["any-movement", (r) => fired(r.movement !== "no-significant-change", "any-movement")],
+  [
+    "slice-regression",
+    (r) => {
+      const slices2 = r.slices.filter((s) => s.change === "worse").length;
+      return slices2 > 0 ? { outcome: "slice-regression", slices: slices2 } : null;
+    }
+  ],
+  [
+    "high-bias",
+    (r) => fired(
+      r.candidate.diagnosis === "high-bias" || r.candidate.diagnosis === "high-bias-and-variance",
+      "high-bias"
+    )
+  ],
+  [
+    "high-variance",
+    (r) => fired(
+      r.candidate.diagnosis === "high-variance" || r.candidate.diagnosis === "high-bias-and-variance",
+      "high-variance"
+    )
+  ],
+  ["data-mismatch", (r) => fired(r.candidate.diagnosis === "data-mismatch", "data-mismatch")],
+  [
+    "validation-overfit",
+    (r) => fired(r.candidate.components.overfit.present, "validation-overfit")
+  ],
+  [
+    "guardrail-regression",
+    (r) => {
+      const names2 = guardrailsWith(r, "inferior");
+      return names2.length > 0 ? { outcome: "guardrail-regression", guardrails: names2 } : null;
+    }
+  ],
+  [
+    "guardrail-undetermined",
+    (r) => {
+      const names2 = guardrailsWith(r, "undetermined");
+      return names2.length > 0 ? { outcome: "guardrail-undetermined", guardrails: names2 } : null;
+    }
+  ],
+  ["none", () => null]
+]);
+function fired(condition, outcome) {
+  return condition ? { outcome } : null;
+}
+function applyGate(review, failOn) {
+  const reasons = [];
+  for (const policy of failOn) {
+    const rule = RULES.get(policy) ?? costRule(policy);
+    const reason = rule?.(review) ?? null;
+    if (reason !== null) reasons.push(reason);
+  }
+  return { pass: reasons.length === 0, reasons, failOn: [...failOn] };
+}
+
+// src/analysis/guardrails.ts
+var worseSign = (g) => g.metric.goal === "minimize" ? 1 : -1;
+function test(b, c, alpha) {
+  const bs = b.splits.validation;
+  const cs = c.splits.validation;
+  const estimate = mean(cs.values) - mean(bs.values);
+  const sign = worseSign(c);
+  if (bs.values.length >= 2 && cs.values.length >= 2) {
+    const t = welchT(bs.values, cs.values, alpha);
+    const w = welchWorsening(
+      bs.values.map((v) => sign * v),
+      cs.values.map((v) => sign * v)
+    );
+    return { change: changeOf(t.estimate, t.ci, t.p, "welch-t", sign, alpha), worsening: w };
+  }
+  const variance = binomial(b, bs) !== null && binomial(c, cs) !== null;
+  if (variance) {
+    const v = binomial(b, bs) + binomial(c, cs);
+    const z = normalTest(estimate, v, alpha, "z-binomial");
+    return {
+      change: changeOf(estimate, z.ci, z.p, "z-binomial", sign, alpha),
+      worsening: { estimate: sign * estimate, se: Math.sqrt(v), df: null }
+    };
+  }
+  return {
+    change: { estimate, ci: null, p: null, test: "none", call: "undetermined" },
+    worsening: null
+  };
+}
+function binomial(g, split) {
+  if (g.metric.kind !== "proportion" || split.examples === void 0) return null;
+  return binomialVariance(mean(split.values), split.examples * split.values.length);
+}
+function changeOf(estimate, ci, p, testName, sign, alpha) {
+  const significant = p !== null && p < alpha && estimate !== 0;
+  const worse = sign * estimate > 0;
+  return {
+    estimate,
+    ci,
+    p,
+    test: testName,
+    call: significant ? worse ? "worse" : "better" : "flat"
+  };
+}
+function marginOf(name, b, c, settings) {
+  const fromConfig = settings.margins.get(name);
+  const candidateIgnored = (chosen) => c?.margin !== void 0 && chosen !== void 0 && c.margin !== chosen;
+  if (fromConfig !== void 0)
+    return {
+      margin: fromConfig,
+      source: "config",
+      candidateIgnored: candidateIgnored(fromConfig)
+    };
+  if (b?.margin !== void 0)
+    return { margin: b.margin, source: "baseline", candidateIgnored: candidateIgnored(b.margin) };
+  if (c?.margin !== void 0)
+    return { margin: c.margin, source: "candidate", candidateIgnored: false };
+  return { margin: null, source: null, candidateIgnored: false };
+}
+function reviewGuardrails(baseline, candidate, settings) {
+  const byName = (run) => new Map((run.guardrails ?? []).map((g) => [g.metric.name, g]));
+  const bs = byName(baseline);
+  const cs = byName(candidate);
+  const names2 = [.../* @__PURE__ */ new Set([...cs.keys(), ...bs.keys()])];
+  const drafts = names2.map((name) => {
+    const b = bs.get(name);
+    const c = cs.get(name);
+    const metric = (c ?? b)?.metric;
+    if (metric === void 0) throw new Error(`guardrail ${name} vanished`);
+    const { margin, source, candidateIgnored } = marginOf(name, b, c, settings);
+    const review = {
+      name,
+      goal: metric.goal,
+      kind: metric.kind,
+      unit: metric.unit ?? null,
+      baseline: b === void 0 ? null : mean(b.splits.validation.values),
+      candidate: c === void 0 ? null : mean(c.splits.validation.values),
+      change: null,
+      margin,
+      marginSource: source,
+      worseningBounds: null,
+      pNonInferior: null,
+      nonInferiority: null,
+      problems: []
+    };
+    if (candidateIgnored) review.problems.push("candidate-margin-ignored");
+    if (margin === null) review.problems.push("no-margin");
+    if (b === void 0) review.problems.push("missing-in-baseline");
+    if (c === void 0) review.problems.push("missing-in-candidate");
+    if (b === void 0 || c === void 0) return { review, ni: null };
+    if (b.metric.goal !== c.metric.goal || b.metric.kind !== c.metric.kind) {
+      review.problems.push("metric-differs");
+      return { review, ni: null };
+    }
+    const tested = test(b, c, settings.alpha);
+    review.change = tested.change;
+    if (tested.worsening === null) review.problems.push("noise-unknown");
+    if (margin === null) return { review, ni: null };
+    if (tested.worsening === null) {
+      review.nonInferiority = "undetermined";
+      return { review, ni: null };
+    }
+    const ni = nonInferiorityTest(tested.worsening, margin, settings.alpha);
+    review.worseningBounds = ni.bounds;
+    return { review, ni };
+  });
+  const calls = nonInferiorityCalls(
+    drafts.map((d) => d.ni),
+    settings.alpha
+  );
+  return drafts.map((d, i2) => {
+    const call = calls[i2];
+    if (d.ni !== null && call !== void 0 && call.call !== null) {
+      d.review.nonInferiority = call.call;
+      d.review.pNonInferior = call.pNonInferior;
+    }
+    return d.review;
+  });
+}
+
+// src/analysis/hyperparameters.ts
+function diffHyperparameters(baseline = {}, candidate = {}) {
+  const keys = [.../* @__PURE__ */ new Set([...Object.keys(baseline), ...Object.keys(candidate)])].sort();
+  const out = [];
+  for (const key of keys) {
+    const inB = Object.hasOwn(baseline, key);
+    const inC = Object.hasOwn(candidate, key);
+    const b = baseline[key];
+    const c = candidate[key];
+    if (!inB) out.push({ key, baseline: null, candidate: c, kind: "added" });
+    else if (!inC) out.push({ key, baseline: b, candidate: null, kind: "removed" });
+    else if (typeof b === "number" && typeof c === "number") {
+      if (c > b) out.push({ key, baseline: b, candidate: c, kind: "raised" });
+      else if (c < b) out.push({ key, baseline: b, candidate: c, kind: "lowered" });
+    } else if (JSON.stringify(b) !== JSON.stringify(c))
+      out.push({ key, baseline: b, candidate: c, kind: "changed" });
+  }
+  return out;
+}
+var KNOBS = [
+  [
+    /^(lambda|l2|l2_penalty|weight_decay|reg(ularization)?(_strength)?|ridge_alpha|dropout)$/i,
+    "regularization"
+  ],
+  [/^(features|num_features|n_features|feature_count)$/i, "features"],
+  [/^(polynomial_degree|poly_degree|degree|interaction_terms)$/i, "feature-richness"],
+  [/^(train_examples|training_examples|n_train|train_size|num_train)$/i, "data"],
+  [/^(epochs|max_epochs|num_epochs|iterations|max_iter|steps)$/i, "epochs"],
+  [
+    /^(hidden_units|hidden_size|layers|num_layers|depth|max_depth|width|params|parameters|model_size|n_estimators)$/i,
+    "model-size"
+  ]
+];
+function knobOf(key) {
+  for (const [pattern, knob] of KNOBS) if (pattern.test(key)) return knob;
+  return null;
+}
+var PULLED = {
+  regularization: { raised: "stronger-regularization", lowered: "weaker-regularization" },
+  features: { raised: "more-features", lowered: "fewer-features" },
+  "feature-richness": { raised: "richer-features", lowered: "fewer-features" },
+  data: { raised: "more-data", lowered: "more-data" },
+  epochs: { raised: "train-longer", lowered: "early-stopping" },
+  "model-size": { raised: "bigger-model", lowered: "smaller-model" }
+};
+function pulledLevers(changes) {
+  const out = [];
+  for (const change2 of changes) {
+    if (change2.kind !== "raised" && change2.kind !== "lowered") continue;
+    const knob = knobOf(change2.key);
+    if (knob === null) continue;
+    if (knob === "data" && change2.kind === "lowered") continue;
+    out.push({ lever: PULLED[knob][change2.kind], change: change2, knob });
+  }
+  return out;
+}
+
+// src/analysis/levers/context.ts
+function curveEvidence(curves) {
+  const analysed = (c) => c === void 0 || "skipped" in c ? null : c;
+  return {
+    learning: analysed(curves.training_examples),
+    sweep: analysed(curves.regularization),
+    epochs: analysed(curves.epochs)
+  };
+}
+var Drafts = class {
+  #byId = /* @__PURE__ */ new Map();
+  add(id, score, evidence, suggestion) {
+    const existing = this.#byId.get(id);
+    if (existing !== void 0 && existing.score >= score) return;
+    this.#byId.set(id, {
+      id,
+      score,
+      ...suggestion === void 0 ? {} : { suggestion },
+      evidence
+    });
+  }
+  has(id) {
+    return this.#byId.has(id);
+  }
+  /** Highest score first; drafts with equal scores keep the order they were first drafted in. */
+  ranked() {
+    return [...this.#byId.values()].sort((a, b) => b.score - a.score);
+  }
+};
+function between(from, to) {
+  return from > 0 && to > 0 ? Math.sqrt(from * to) : (from + to) / 2;
+}
+function savedByStopping(e, goal) {
+  const sign = goal === "minimize" ? 1 : -1;
+  return Math.max(0, sign * (e.finalValidation - e.bestValidation));
+}
+function epochMinimum(e, goal) {
+  return {
+    kind: "epoch-minimum",
+    epoch: e.bestX,
+    of: e.finalX,
+    saves: savedByStopping(e, goal),
+    gl: e.gl
+  };
+}
+
+// src/analysis/levers/catalogue.ts
+var BY_TARGET = {
+  variance: [
+    "more-data",
+    "stronger-regularization",
+    "fewer-features",
+    "early-stopping",
+    "smaller-model"
+  ],
+  bias: [
+    "richer-features",
+    "more-features",
+    "weaker-regularization",
+    "bigger-model",
+    "train-longer"
+  ]
+};
+
+// src/analysis/levers/scores.ts
+var REVERSE_OWN_CHANGE = 100;
+var COUNTER_WITH_SWEEP = 95;
+var STEP_BACK_CAPACITY = 90;
+var COUNTER_WITHOUT_SWEEP = 85;
+var DIAGNOSIS_BASE = 60;
+var SECOND_TARGET_STEP = 20;
+var CATALOGUE_STEP = 2;
+var GAP_CLOSING_BONUS = 8;
+var GAP_FLAT_PENALTY = 25;
+var SWEEP_AGREES_BONUS = 10;
+var SWEEP_DISAGREES_PENALTY = 20;
+var EPOCH_CONFIRMED_BONUS = 12;
+var EPOCH_UNCONFIRMED_PENALTY = 15;
+var NOTHING_TO_WEAKEN_PENALTY = 10;
+var ALREADY_PULLED_PENALTY = 30;
+var EPOCH_CURVE_ALONE = 35;
+var MISMATCH_DIAGNOSED = 70;
+var MISMATCH_PRESENT = 30;
+var VALIDATION_OVERFIT = 40;
+var SUPPLY_REFERENCE = 20;
+var ADD_REPEATS = 15;
+
+// src/analysis/levers/own-change.ts
+var CAPACITY_LEVERS = /* @__PURE__ */ new Set([
+  "richer-features",
+  "more-features",
+  "bigger-model"
+]);
+function numericChange(p) {
+  return {
+    hyperparameter: p.change.key,
+    from: Number(p.change.baseline),
+    to: Number(p.change.candidate),
+    direction: p.change.kind === "lowered" ? "lowered" : "raised"
+  };
+}
+function ownChangeLevers(ctx, curves, drafts) {
+  const towardBias = ctx.movement === "toward-underfitting" || ctx.movement === "worse-on-both";
+  const towardVariance = ctx.movement === "toward-overfitting" || ctx.movement === "worse-on-both";
+  const biasChange = {
+    kind: "component-change",
+    component: "bias",
+    delta: ctx.bias
+  };
+  const varianceChange = {
+    kind: "component-change",
+    component: "variance",
+    delta: ctx.variance
+  };
+  for (const p of ctx.pulled) {
+    const { baseline: from, candidate: to, key } = p.change;
+    if (typeof from !== "number" || typeof to !== "number") continue;
+    const change2 = { kind: "pr-change", ...numericChange(p) };
+    const midway = {
+      hyperparameter: key,
+      value: between(from, to),
+      basis: "between-old-and-new"
+    };
+    if (p.lever === "stronger-regularization" && towardBias) {
+      drafts.add("weaker-regularization", REVERSE_OWN_CHANGE, [change2, biasChange], midway);
+    }
+    if (p.lever === "weaker-regularization" && towardVariance) {
+      drafts.add("stronger-regularization", REVERSE_OWN_CHANGE, [change2, varianceChange], midway);
+    }
+    if (CAPACITY_LEVERS.has(p.lever) && towardVariance) {
+      const back = p.lever === "bigger-model" ? "smaller-model" : "fewer-features";
+      drafts.add(back, STEP_BACK_CAPACITY, [change2, varianceChange], midway);
+      counterCapacity(ctx, curves, drafts, [change2, varianceChange]);
+    }
+  }
+}
+function counterCapacity(ctx, curves, drafts, evidence) {
+  const sweep = curves.sweep;
+  if (sweep === null || sweep.side !== "below") {
+    drafts.add("stronger-regularization", COUNTER_WITHOUT_SWEEP, evidence);
+    return;
+  }
+  const key = ctx.regularization?.key;
+  drafts.add(
+    "stronger-regularization",
+    COUNTER_WITH_SWEEP,
+    [
+      ...evidence,
+      {
+        kind: "sweep-minimum",
+        hyperparameter: key ?? null,
+        bestX: sweep.bestX,
+        bestValidation: sweep.bestValidation,
+        current: ctx.regularization?.value ?? null,
+        suggestedX: sweep.suggestedX,
+        side: sweep.side,
+        supports: true,
+        atEdge: sweep.atEdge
+      }
+    ],
+    key === void 0 ? void 0 : sweepSuggestion(key, sweep)
+  );
+}
+function sweepSuggestion(key, sweep) {
+  return {
+    hyperparameter: key,
+    value: sweep.suggestedX,
+    basis: sweep.atEdge === null ? "sweep-minimum" : "beyond-sweep-edge"
+  };
+}
+
+// src/analysis/levers/diagnosis.ts
+function targets(diagnosis, run) {
+  const b = run.components.bias.value ?? 0;
+  const v = run.components.variance.value ?? 0;
+  switch (diagnosis) {
+    case "high-variance":
+      return ["variance"];
+    case "high-bias":
+      return ["bias"];
+    case "high-bias-and-variance":
+      return b >= v ? ["bias", "variance"] : ["variance", "bias"];
+    default:
+      return [];
+  }
+}
+function diagnosisLevers(ctx, curves, drafts) {
+  const pulled = new Map(ctx.pulled.map((p) => [p.lever, p]));
+  targets(ctx.candidate.diagnosis, ctx.candidate).forEach((target, t) => {
+    const component = ctx.candidate.components[target];
+    const base = component.value === null ? [] : [
+      {
+        kind: "diagnosis",
+        component: target,
+        value: component.value,
+        errorLevel: ctx.candidate.errorLevel
+      }
+    ];
+    BY_TARGET[target].forEach((id, i2) => {
+      const draft = {
+        score: DIAGNOSIS_BASE - t * SECOND_TARGET_STEP - i2 * CATALOGUE_STEP,
+        evidence: [...base]
+      };
+      sharpen(id, draft, ctx, curves);
+      const p = pulled.get(id);
+      if (p !== void 0) {
+        draft.score -= ALREADY_PULLED_PENALTY;
+        draft.evidence.push({ kind: "already-pulled", ...numericChange(p) });
+      }
+      drafts.add(id, draft.score, draft.evidence, draft.suggestion);
+    });
+  });
+}
+function sharpen(id, draft, ctx, curves) {
+  if (id === "more-data" && curves.learning !== null) {
+    const lc = curves.learning;
+    const twice = lc.projections[0];
+    if (twice !== void 0) {
+      draft.evidence.push({
+        kind: "learning-curve",
+        fromX: Math.max(...lc.chart.map((p) => p.x)),
+        atX: twice.x,
+        current: ctx.candidate.splits.find((s) => s.split === "validation")?.mean ?? 0,
+        projected: twice.validation,
+        ci: twice.ci,
+        r2: lc.r2
+      });
+    }
+    if (lc.gapTrend === "flat") {
+      draft.score -= GAP_FLAT_PENALTY;
+      draft.evidence.push({ kind: "gap-trend", trend: "flat" });
+    } else if (lc.gapTrend === "closing") {
+      draft.score += GAP_CLOSING_BONUS;
+      draft.evidence.push({ kind: "gap-trend", trend: "closing" });
+    }
+  }
+  if ((id === "stronger-regularization" || id === "weaker-regularization") && curves.sweep !== null) {
+    sharpenBySweep(id, draft, ctx, curves.sweep);
+  }
+  const epochs = curves.epochs;
+  if (id === "early-stopping") {
+    if (epochs !== null && epochs.stoppedLate) {
+      draft.score += EPOCH_CONFIRMED_BONUS;
+      draft.evidence.push(epochMinimum(epochs, ctx.goal));
+    } else {
+      draft.score -= EPOCH_UNCONFIRMED_PENALTY;
+      draft.evidence.push({ kind: "epoch-curve-silent", curve: epochs !== null });
+    }
+  }
+  if (id === "train-longer") {
+    if (epochs !== null && epochs.stoppedEarly) {
+      draft.score += EPOCH_CONFIRMED_BONUS;
+      draft.evidence.push({ kind: "still-improving", epoch: epochs.finalX });
+    } else {
+      draft.score -= EPOCH_UNCONFIRMED_PENALTY;
+      draft.evidence.push({ kind: "epoch-curve-silent", curve: epochs !== null });
+    }
+  }
+  if (id === "weaker-regularization" && ctx.regularization === void 0 && curves.sweep === null) {
+    draft.score -= NOTHING_TO_WEAKEN_PENALTY;
+  }
+}
+function sharpenBySweep(id, draft, ctx, sweep) {
+  const wants = id === "stronger-regularization" ? "below" : "above";
+  const supports = sweep.side === "unknown" ? null : sweep.side === wants;
+  if (supports === null && sweep.atEdge === null) return;
+  const key = ctx.regularization?.key;
+  draft.evidence.push({
+    kind: "sweep-minimum",
+    hyperparameter: key ?? null,
+    bestX: sweep.bestX,
+    bestValidation: sweep.bestValidation,
+    current: ctx.regularization?.value ?? null,
+    suggestedX: sweep.suggestedX,
+    side: sweep.side,
+    supports,
+    atEdge: sweep.atEdge
+  });
+  if (supports === true) {
+    draft.score += SWEEP_AGREES_BONUS;
+    if (key !== void 0) draft.suggestion = sweepSuggestion(key, sweep);
+  } else if (supports === false) draft.score -= SWEEP_DISAGREES_PENALTY;
+}
+
+// src/analysis/levers/secondary.ts
+function secondaryLevers(ctx, curves, drafts) {
+  const epochs = curves.epochs;
+  const { candidate } = ctx;
+  if (epochs !== null && epochs.stoppedLate && !drafts.has("early-stopping")) {
+    drafts.add("early-stopping", EPOCH_CURVE_ALONE, [epochMinimum(epochs, ctx.goal)]);
+  }
+  if (epochs !== null && epochs.stoppedEarly && !drafts.has("train-longer")) {
+    drafts.add("train-longer", EPOCH_CURVE_ALONE, [
+      { kind: "still-improving", epoch: epochs.finalX }
+    ]);
+  }
+  const mismatch = candidate.components.mismatch;
+  if (candidate.diagnosis === "data-mismatch" || mismatch.present) {
+    drafts.add(
+      "align-training-data",
+      candidate.diagnosis === "data-mismatch" ? MISMATCH_DIAGNOSED : MISMATCH_PRESENT,
+      [
+        {
+          kind: "diagnosis",
+          component: "mismatch",
+          value: mismatch.value ?? 0,
+          errorLevel: candidate.errorLevel
+        }
+      ]
+    );
+  }
+  const overfit = candidate.components.overfit;
+  if (overfit.present) {
+    drafts.add("bigger-validation-set", VALIDATION_OVERFIT, [
+      {
+        kind: "diagnosis",
+        component: "overfit",
+        value: overfit.value ?? 0,
+        errorLevel: candidate.errorLevel
+      }
+    ]);
+  }
+  if (candidate.biasUnknown) {
+    drafts.add("supply-reference", SUPPLY_REFERENCE, [{ kind: "reference-missing" }]);
+  }
+  if (ctx.noiseUnknown) {
+    drafts.add("add-repeats", ADD_REPEATS, [{ kind: "noise-unknown" }]);
+  }
+}
+
+// src/analysis/levers/choose.ts
+function chooseLevers(ctx) {
+  const curves = curveEvidence(ctx.candidate.curves);
+  const drafts = new Drafts();
+  ownChangeLevers(ctx, curves, drafts);
+  diagnosisLevers(ctx, curves, drafts);
+  secondaryLevers(ctx, curves, drafts);
+  return { levers: drafts.ranked(), nonLevers: nonLevers(ctx) };
+}
+function nonLevers(ctx) {
+  const biased = ctx.candidate.diagnosis === "high-bias" || ctx.candidate.diagnosis === "high-bias-and-variance";
+  const shrank = ctx.changes.some((c) => c.kind === "lowered" && knobOf(c.key) === "data");
+  return biased || shrank ? ["smaller-training-set"] : [];
+}
+
+// src/analysis/movement.ts
+var TABLE = {
+  down: { down: "better-on-both", flat: "away-from-underfitting", up: "toward-overfitting" },
+  flat: { down: "away-from-overfitting", flat: "no-significant-change", up: "toward-overfitting" },
+  up: { down: "toward-underfitting", flat: "toward-underfitting", up: "worse-on-both" }
+};
+function movementOf(biasCall, varianceCall) {
+  return TABLE[biasCall][varianceCall];
+}
+function validationChangeOf(shortfallCall) {
+  return shortfallCall === "up" ? "worse" : shortfallCall === "down" ? "better" : "flat";
 }
 
 // src/analysis/curves/early-stopping.ts
@@ -47073,10 +48188,10 @@ function gapTrend(points) {
   if (Math.abs(meanGap) <= RELATIVE_CHANGE * Math.abs(meanV)) {
     return { trend: "flat", changePerDoubling: meanGap !== 0 ? sxy / sxx / Math.abs(meanGap) : 0 };
   }
-  const change = sxy / sxx / Math.abs(meanGap);
-  if (change <= -RELATIVE_CHANGE) return { trend: "closing", changePerDoubling: change };
-  if (change < RELATIVE_CHANGE) return { trend: "flat", changePerDoubling: change };
-  return { trend: "unknown", changePerDoubling: change };
+  const change2 = sxy / sxx / Math.abs(meanGap);
+  if (change2 <= -RELATIVE_CHANGE) return { trend: "closing", changePerDoubling: change2 };
+  if (change2 < RELATIVE_CHANGE) return { trend: "flat", changePerDoubling: change2 };
+  return { trend: "unknown", changePerDoubling: change2 };
 }
 
 // src/analysis/curves/lttb.ts
@@ -47419,11 +48534,11 @@ function verdict(problem, p, state, iterations, stop, lower, upper, evaluate, ja
       q[j] = Math.min(Math.max(v, lower[j]), upper[j]);
       return evaluate(q).rss;
     };
-    const change = Math.max(
+    const change2 = Math.max(
       Math.abs(probe(pj + h) - state.rss),
       Math.abs(probe(pj - h) - state.rss)
     );
-    return !(change > 1e-12 * state.rss);
+    return !(change2 > 1e-12 * state.rss);
   });
   const scaled = jac.map(
     (row) => free.map((j) => norms[j] > 0 ? row[j] / norms[j] : 0)
@@ -47512,11 +48627,17 @@ function fitPowerLaw(m, e, options) {
   const meanE = e.reduce((s, v) => s + v, 0) / e.length;
   const tss = e.reduce((s, v) => s + (v - meanE) ** 2, 0);
   const level = options.level ?? 0.95;
-  const t = best.dof > 0 ? tQuantile(1 - (1 - level) / 2, best.dof) : NaN;
+  const cAtBound = best.atBound[2] === true && best.atBound[1] !== true;
+  const full = cAtBound ? fullCovariance(
+    u.map((ui) => jacobian([bigA, b, c], ui)),
+    best.rss
+  ) : null;
+  const cov = full ? full.covariance : best.covariance;
+  const dof = full ? full.dof : best.dof;
+  const t = dof > 0 ? tQuantile(1 - (1 - level) / 2, dof) : NaN;
   const projections = multiples.map((k) => {
     const error2 = model([bigA, b, c], k);
     const g = jacobian([bigA, b, c], k);
-    const cov = best.covariance;
     let variance = NaN;
     if (cov) {
       variance = 0;
@@ -47540,8 +48661,25 @@ function fitPowerLaw(m, e, options) {
     rss: best.rss,
     dof: best.dof,
     atBound: { b: best.atBound[1] === true, c: best.atBound[2] === true },
+    intervalCovariance: full ? "full" : "free",
     projections
   };
+}
+function fullCovariance(jac, rss) {
+  const n = jac.length;
+  const p = jac[0]?.length ?? 0;
+  const dof = n - p;
+  if (dof <= 0) return null;
+  const norms = Array.from({ length: p }, (_, j) => Math.hypot(...jac.map((row) => row[j] ?? 0)));
+  if (norms.some((v) => !(v > 0) || !Number.isFinite(v))) return null;
+  const scaled = jac.map((row) => row.map((v, j) => v / norms[j]));
+  const inverse = inverseOfRtR(qrLeastSquares(scaled, new Array(n).fill(0)).r);
+  if (!inverse) return null;
+  const s2 = rss / dof;
+  const covariance = inverse.map(
+    (row, j) => row.map((v, k) => s2 * v / (norms[j] * norms[k]))
+  );
+  return { covariance, dof };
 }
 function startingValues(u, e, lower) {
   const minE = Math.min(...e);
@@ -47573,7 +48711,7 @@ var MIN_REGULARIZATION_POINTS = 3;
 function regularizationMinimum(x2, validationError, lambda) {
   const n = x2.length;
   if (n < MIN_REGULARIZATION_POINTS) {
-    return { skipped: `needs at least ${MIN_REGULARIZATION_POINTS} points, has ${n}` };
+    return { skipped: "too-few-points", points: n, needs: MIN_REGULARIZATION_POINTS };
   }
   let i2 = 0;
   validationError.forEach((v, j) => {
@@ -47597,10 +48735,10 @@ function regularizationMinimum(x2, validationError, lambda) {
     const [x0, x1, x22] = [lx[i2 - 1], lx[i2], lx[i2 + 1]];
     const [y0, y1, y2] = [validationError[i2 - 1], validationError[i2], validationError[i2 + 1]];
     step = (x22 - x0) / 2;
-    const num2 = (x1 - x0) ** 2 * (y1 - y2) - (x1 - x22) ** 2 * (y1 - y0);
+    const num = (x1 - x0) ** 2 * (y1 - y2) - (x1 - x22) ** 2 * (y1 - y0);
     const den = (x1 - x0) * (y1 - y2) - (x1 - x22) * (y1 - y0);
     if (den !== 0) {
-      logBest = x1 - num2 / (2 * den);
+      logBest = x1 - num / (2 * den);
       refined = true;
     }
     suggestedX = Math.exp(logBest);
@@ -47615,6 +48753,7 @@ function regularizationMinimum(x2, validationError, lambda) {
 }
 
 // src/analysis/curves/index.ts
+var MIN_EPOCH_POINTS = 2;
 var CHART_POINTS = 60;
 function analyzeCurves(curves, context3) {
   const report = {};
@@ -47648,7 +48787,8 @@ function chart(points, scale, keep) {
   });
 }
 function analyzeEpochs(points, scale) {
-  if (points.length < 2) return { skipped: `needs at least 2 points, has ${points.length}` };
+  if (points.length < MIN_EPOCH_POINTS)
+    return { skipped: "too-few-points", points: points.length, needs: MIN_EPOCH_POINTS };
   const validation = points.map((p) => scale.toError(p.validation));
   const hasTrain = points.every((p) => p.train !== void 0);
   const train = hasTrain ? points.map((p) => scale.toError(p.train)) : null;
@@ -47676,8 +48816,14 @@ function analyzeEpochs(points, scale) {
 function analyzeLearningCurve(points, scale) {
   const m = points.map((p) => p.x);
   const e = points.map((p) => scale.toError(p.validation));
+  const tooFew = {
+    skipped: "too-few-points",
+    points: m.length,
+    needs: MIN_POWER_LAW_POINTS
+  };
+  if (m.length < MIN_POWER_LAW_POINTS) return tooFew;
   const fit = fitPowerLaw(m, e, { lower: scale.lower, upper: scale.upper });
-  if ("skipped" in fit) return fit;
+  if ("skipped" in fit) return { ...tooFew, skipped: "fit-failed" };
   const gap = gapTrend(
     points.map(
       (p) => p.train === void 0 ? { x: p.x, validationError: scale.toError(p.validation) } : {
@@ -47727,544 +48873,51 @@ function analyzeRegularization(points, scale, lambda) {
   };
 }
 
-// src/analysis/measure.ts
-function shortfallSign(run) {
-  return run.metric.goal === "minimize" ? 1 : -1;
-}
-function splitMeasure(split) {
-  return { terms: [{ split, weight: 1 }], constant: 0 };
-}
-function perRepeat(run, measure) {
-  const sign = shortfallSign(run);
-  const columns = [];
-  for (const term of measure.terms) {
-    const split = run.splits[term.split];
-    if (split === void 0) return null;
-    columns.push({ values: split.values, weight: term.weight });
+// src/analysis/run-summary.ts
+function splitSummary(run, split, alpha) {
+  const s = run.splits[split];
+  if (s === void 0) return null;
+  const m = mean(s.values);
+  const n = s.values.length;
+  const sd = n >= 2 ? Math.sqrt(sampleVariance(s.values)) : null;
+  let ci = null;
+  if (sd !== null) {
+    const half = tQuantile(1 - alpha / 2, n - 1) * (sd / Math.sqrt(n));
+    ci = [m - half, m + half];
+  } else if (run.metric.kind === "proportion" && s.examples !== void 0) {
+    ci = wilsonInterval(Math.round(m * s.examples), s.examples, alpha);
   }
-  const repeats = run.splits.train.values.length;
-  const out = [];
-  for (let i2 = 0; i2 < repeats; i2++) {
-    let total = measure.constant;
-    for (const column of columns) total += column.weight * sign * (column.values[i2] ?? Number.NaN);
-    out.push(total);
+  return { split, mean: m, sd, repeats: n, examples: s.examples ?? null, ci };
+}
+function regularizationOf(run) {
+  for (const [key, value2] of Object.entries(run.hyperparameters ?? {})) {
+    if (typeof value2 === "number" && knobOf(key) === "regularization" && !/dropout/i.test(key))
+      return { key, value: value2 };
   }
-  return out;
+  return void 0;
 }
-function binomialMeasureVariance(run, measure) {
-  if (run.metric.kind !== "proportion") return null;
-  let total = 0;
-  for (const term of measure.terms) {
-    const split = run.splits[term.split];
-    if (split?.examples === void 0) return null;
-    const repeats = split.values.length;
-    total += term.weight * term.weight * binomialVariance(mean(split.values), split.examples * repeats);
-  }
-  return total;
-}
-
-// src/analysis/noise.ts
-function callOf(result, settings) {
-  const big = Math.abs(result.estimate) >= settings.minEffect && result.estimate !== 0;
-  const significant = result.p === null ? settings.minEffect > 0 : result.p < settings.alpha;
-  if (!big || !significant) return "flat";
-  return result.estimate > 0 ? "up" : "down";
-}
-function toDelta(result, settings) {
+function summarize(run, settings) {
+  const reference = chooseReference(run, settings.reference);
+  const components = decompose(run, reference.value, settings);
+  const lambda = regularizationOf(run)?.value;
   return {
-    estimate: result.estimate,
-    ci: result.ci,
-    p: result.p,
-    test: result.test,
-    call: callOf(result, settings)
+    name: run.run.name,
+    commit: run.run.commit ?? null,
+    createdAt: run.run.createdAt ?? null,
+    reference: reference.value,
+    referenceSource: reference.source,
+    splits: SPLIT_NAMES.flatMap((s) => splitSummary(run, s, settings.alpha) ?? []),
+    errorLevel: errorLevel(run),
+    components,
+    diagnosis: diagnose(components),
+    biasUnknown: reference.value === null,
+    warnings: components.overfit.present ? ["validation-overfit"] : [],
+    curves: analyzeCurves(run.curves, {
+      ...lambda === void 0 ? {} : { lambda },
+      kind: run.metric.kind,
+      goal: run.metric.goal
+    })
   };
-}
-function measureChange(baseline, candidate, measure, alpha) {
-  const b = perRepeat(baseline, measure.baseline);
-  const c = perRepeat(candidate, measure.candidate);
-  if (b === null || c === null) return null;
-  const estimate = mean(c) - mean(b);
-  if (b.length >= 2 && c.length >= 2) return welchT(b, c, alpha);
-  const vb = binomialMeasureVariance(baseline, measure.baseline);
-  const vc = binomialMeasureVariance(candidate, measure.candidate);
-  if (vb !== null && vc !== null) return normalTest(estimate, vb + vc, alpha, "z-binomial");
-  return { estimate, ci: null, p: null, test: "none" };
-}
-function measureLevel(run, measure, alpha) {
-  const values = perRepeat(run, measure);
-  if (values === null) return null;
-  const value = mean(values);
-  if (values.length >= 2) {
-    const t = oneSampleT(values, alpha);
-    return { value, ci: t.ci, p: t.pGreater };
-  }
-  const variance = binomialMeasureVariance(run, measure);
-  if (variance !== null) {
-    const z = normalTest(value, variance, alpha, "z-binomial");
-    const p = variance > 0 ? 1 - normalCdf(value / Math.sqrt(variance)) : value > 0 ? 0 : 1;
-    return { value, ci: z.ci, p };
-  }
-  return { value, ci: null, p: null };
-}
-function toMetricUnits(result, sign) {
-  if (sign === 1) return result;
-  return {
-    ...result,
-    estimate: -result.estimate,
-    ci: result.ci === null ? null : [-result.ci[1], -result.ci[0]],
-    ...result.statistic === void 0 ? {} : { statistic: -result.statistic }
-  };
-}
-
-// src/analysis/decompose.ts
-function chooseReference(run, override) {
-  if (override !== void 0) return { value: override, source: "config" };
-  if (run.reference !== void 0) return { value: run.reference, source: "artifact" };
-  if (run.metric.kind === "proportion" && run.metric.goal === "minimize")
-    return { value: 0, source: "default" };
-  return { value: null, source: "unknown" };
-}
-function componentMeasures(run, reference) {
-  const sign = shortfallSign(run);
-  const hasDev = run.splits.train_dev !== void 0;
-  return {
-    bias: reference === null ? null : { terms: [{ split: "train", weight: 1 }], constant: -sign * reference },
-    variance: {
-      terms: [
-        { split: hasDev ? "train_dev" : "validation", weight: 1 },
-        { split: "train", weight: -1 }
-      ],
-      constant: 0
-    },
-    mismatch: hasDev ? {
-      terms: [
-        { split: "validation", weight: 1 },
-        { split: "train_dev", weight: -1 }
-      ],
-      constant: 0
-    } : null,
-    overfit: run.splits.test !== void 0 ? {
-      terms: [
-        { split: "test", weight: 1 },
-        { split: "validation", weight: -1 }
-      ],
-      constant: 0
-    } : null
-  };
-}
-function errorLevel(run) {
-  const m = mean(run.splits.validation.values);
-  return Math.abs(run.metric.goal === "minimize" ? m : 1 - m);
-}
-var UNAVAILABLE = {
-  bias: 'No reference level: give "reference" in the artifact or the config (human-level error, a prior system, or an estimated Bayes error).',
-  variance: "Needs train and validation values.",
-  mismatch: "Needs a train_dev split (held-out data from the training distribution).",
-  overfit: "Needs a test split."
-};
-function decompose(run, reference, settings) {
-  const measures = componentMeasures(run, reference);
-  const threshold = Math.max(settings.gapTolerance * errorLevel(run), settings.minEffect);
-  const out = {};
-  for (const name of ["bias", "variance", "mismatch", "overfit"]) {
-    const measure = measures[name];
-    const level = measure === null ? null : measureLevel(run, measure, settings.alpha);
-    if (level === null) {
-      out[name] = {
-        name,
-        value: null,
-        unavailable: UNAVAILABLE[name],
-        ci: null,
-        p: null,
-        present: false
-      };
-      continue;
-    }
-    const significant = level.p === null || level.p < settings.alpha;
-    const present = level.value > 0 && level.value >= threshold && significant;
-    out[name] = { name, value: level.value, ci: level.ci, p: level.p, present };
-  }
-  return out;
-}
-function diagnose(components) {
-  const candidates = ["bias", "variance", "mismatch"].map((name) => components[name]).filter((c) => c.present && c.value !== null).sort((a, b) => (b.value ?? 0) - (a.value ?? 0));
-  const top = candidates[0];
-  if (top === void 0) return "good-fit";
-  const bias = components.bias;
-  const variance = components.variance;
-  if (bias.present && variance.present && bias.value !== null && variance.value !== null) {
-    const ratio = Math.max(bias.value, variance.value) / Math.min(bias.value, variance.value);
-    if (ratio <= 2 && (top.name === "bias" || top.name === "variance"))
-      return "high-bias-and-variance";
-  }
-  if (top.name === "bias") return "high-bias";
-  if (top.name === "variance") return "high-variance";
-  return "data-mismatch";
-}
-
-// src/analysis/format.ts
-function formatValue(value, kind) {
-  if (kind === "proportion") return `${(value * 100).toFixed(Math.abs(value) < 1e-3 ? 2 : 1)}%`;
-  return formatNumber(value);
-}
-function formatChange(value, kind) {
-  const sign = value > 0 ? "+" : value < 0 ? "\u2212" : "\xB1";
-  const magnitude = Math.abs(value);
-  if (kind === "proportion")
-    return `${sign}${(magnitude * 100).toFixed(magnitude < 1e-3 ? 2 : 1)} pts`;
-  return `${sign}${formatNumber(magnitude)}`;
-}
-function formatNumber(value) {
-  if (value === 0) return "0";
-  const abs = Math.abs(value);
-  if (abs >= 1e5 || abs < 1e-3) return value.toExponential(2);
-  return Number(value.toPrecision(4)).toString();
-}
-function formatP(p) {
-  if (p === null) return "n/a";
-  return p < 1e-3 ? "< 0.001" : p.toFixed(3);
-}
-
-// src/analysis/gate.ts
-var RULES = {
-  "worse-validation": (r) => r.validation.change === "worse" ? "validation got significantly worse" : null,
-  "toward-overfitting": (r) => r.movement === "toward-overfitting" ? "the change moved toward overfitting" : null,
-  "toward-underfitting": (r) => r.movement === "toward-underfitting" ? "the change moved toward underfitting" : null,
-  "worse-on-both": (r) => r.movement === "worse-on-both" ? "bias and variance both got worse" : null,
-  "any-movement": (r) => r.movement !== "no-significant-change" ? `the model moved (${r.movement})` : null,
-  "slice-regression": (r) => {
-    const worse = r.slices.filter((s) => s.change === "worse");
-    return worse.length > 0 ? `${worse.length} slice(s) regressed significantly` : null;
-  },
-  "high-bias": (r) => r.candidate.diagnosis === "high-bias" || r.candidate.diagnosis === "high-bias-and-variance" ? "the candidate has high bias" : null,
-  "high-variance": (r) => r.candidate.diagnosis === "high-variance" || r.candidate.diagnosis === "high-bias-and-variance" ? "the candidate has high variance" : null,
-  "data-mismatch": (r) => r.candidate.diagnosis === "data-mismatch" ? "the candidate shows data mismatch" : null,
-  "validation-overfit": (r) => r.candidate.components.overfit.present ? "the candidate overfits the validation set (test error well above validation)" : null,
-  none: () => null
-};
-function applyGate(review) {
-  const failOn = review.settings.failOn;
-  const reasons = [];
-  for (const policy of failOn) {
-    const reason = RULES[policy]?.(review) ?? null;
-    if (reason !== null) reasons.push(`${policy}: ${reason}`);
-  }
-  return { pass: reasons.length === 0, reasons, failOn: [...failOn] };
-}
-
-// src/analysis/hyperparameters.ts
-function diffHyperparameters(baseline = {}, candidate = {}) {
-  const keys = [.../* @__PURE__ */ new Set([...Object.keys(baseline), ...Object.keys(candidate)])].sort();
-  const out = [];
-  for (const key of keys) {
-    const inB = Object.hasOwn(baseline, key);
-    const inC = Object.hasOwn(candidate, key);
-    const b = baseline[key];
-    const c = candidate[key];
-    if (!inB) out.push({ key, baseline: null, candidate: c, kind: "added" });
-    else if (!inC) out.push({ key, baseline: b, candidate: null, kind: "removed" });
-    else if (typeof b === "number" && typeof c === "number") {
-      if (c > b) out.push({ key, baseline: b, candidate: c, kind: "raised" });
-      else if (c < b) out.push({ key, baseline: b, candidate: c, kind: "lowered" });
-    } else if (JSON.stringify(b) !== JSON.stringify(c))
-      out.push({ key, baseline: b, candidate: c, kind: "changed" });
-  }
-  return out;
-}
-var KNOBS = [
-  [
-    /^(lambda|l2|l2_penalty|weight_decay|reg(ularization)?(_strength)?|ridge_alpha|dropout)$/i,
-    "regularization"
-  ],
-  [/^(features|num_features|n_features|feature_count)$/i, "features"],
-  [/^(polynomial_degree|poly_degree|degree|interaction_terms)$/i, "feature-richness"],
-  [/^(train_examples|training_examples|n_train|train_size|num_train)$/i, "data"],
-  [/^(epochs|max_epochs|num_epochs|iterations|max_iter|steps)$/i, "epochs"],
-  [
-    /^(hidden_units|hidden_size|layers|num_layers|depth|max_depth|width|params|parameters|model_size|n_estimators)$/i,
-    "model-size"
-  ]
-];
-function knobOf(key) {
-  for (const [pattern, knob] of KNOBS) if (pattern.test(key)) return knob;
-  return null;
-}
-var PULLED = {
-  regularization: { raised: "stronger-regularization", lowered: "weaker-regularization" },
-  features: { raised: "more-features", lowered: "fewer-features" },
-  "feature-richness": { raised: "richer-features", lowered: "fewer-features" },
-  data: { raised: "more-data", lowered: "more-data" },
-  epochs: { raised: "train-longer", lowered: "early-stopping" },
-  "model-size": { raised: "bigger-model", lowered: "smaller-model" }
-};
-function pulledLevers(changes) {
-  const out = [];
-  for (const change of changes) {
-    if (change.kind !== "raised" && change.kind !== "lowered") continue;
-    const knob = knobOf(change.key);
-    if (knob === null) continue;
-    if (knob === "data" && change.kind === "lowered") continue;
-    out.push({ lever: PULLED[knob][change.kind], change, knob });
-  }
-  return out;
-}
-
-// src/analysis/levers/choose.ts
-var LEVER_CATALOGUE = {
-  "more-data": { addresses: "variance", meaning: "train on more examples" },
-  "fewer-features": { addresses: "variance", meaning: "drop weak or redundant features" },
-  "stronger-regularization": {
-    addresses: "variance",
-    meaning: "raise the regularization strength"
-  },
-  "smaller-model": { addresses: "variance", meaning: "reduce model capacity" },
-  "early-stopping": { addresses: "variance", meaning: "stop at the validation minimum" },
-  "more-features": { addresses: "bias", meaning: "add informative features" },
-  "richer-features": { addresses: "bias", meaning: "add polynomial or interaction terms" },
-  "weaker-regularization": { addresses: "bias", meaning: "lower the regularization strength" },
-  "bigger-model": { addresses: "bias", meaning: "increase model capacity" },
-  "train-longer": { addresses: "bias", meaning: "train for more epochs" },
-  "align-training-data": {
-    addresses: "mismatch",
-    meaning: "make training data look like validation data"
-  },
-  "bigger-validation-set": {
-    addresses: "validation-overfit",
-    meaning: "enlarge or refresh the validation set"
-  },
-  "add-repeats": { addresses: "evidence", meaning: "repeat training with other seeds" },
-  "supply-reference": { addresses: "evidence", meaning: "give a reference level" }
-};
-var BY_TARGET = {
-  variance: [
-    "more-data",
-    "stronger-regularization",
-    "fewer-features",
-    "early-stopping",
-    "smaller-model"
-  ],
-  bias: [
-    "richer-features",
-    "more-features",
-    "weaker-regularization",
-    "bigger-model",
-    "train-longer"
-  ]
-};
-var SMALLER_TRAINING_SET_NOTE = "A smaller training set is not a cure for high bias: it only lowers the training error, while validation error stays high or rises.";
-function learning(curves) {
-  const c = curves.training_examples;
-  return c !== void 0 && !("skipped" in c) ? c : null;
-}
-function regularization(curves) {
-  const c = curves.regularization;
-  return c !== void 0 && !("skipped" in c) ? c : null;
-}
-function epochs(curves) {
-  const c = curves.epochs;
-  return c !== void 0 && !("skipped" in c) ? c : null;
-}
-function targets(diagnosis, run) {
-  const b = run.components.bias.value ?? 0;
-  const v = run.components.variance.value ?? 0;
-  switch (diagnosis) {
-    case "high-variance":
-      return ["variance"];
-    case "high-bias":
-      return ["bias"];
-    case "high-bias-and-variance":
-      return b >= v ? ["bias", "variance"] : ["variance", "bias"];
-    default:
-      return [];
-  }
-}
-function chooseLevers(ctx) {
-  const { kind } = ctx;
-  const v = (x2) => formatValue(x2, kind);
-  const curves = ctx.candidate.curves;
-  const drafts = /* @__PURE__ */ new Map();
-  const add = (id, score, reason, evidence = []) => {
-    const existing = drafts.get(id);
-    if (existing === void 0 || existing.score < score)
-      drafts.set(id, { id, reason, evidence, score });
-  };
-  const pulled = new Map(ctx.pulled.map((p) => [p.lever, p]));
-  const pulledNote = (id) => {
-    const p = pulled.get(id);
-    if (p === void 0) return null;
-    return `this PR already ${p.change.kind} ${p.change.key} (${String(p.change.baseline)} \u2192 ${String(p.change.candidate)})`;
-  };
-  const lc = learning(curves);
-  const reg = regularization(curves);
-  const ep = epochs(curves);
-  const stopEarlierReason = (e) => `Validation minimum at epoch ${formatNumber(e.bestX)} of ${formatNumber(e.finalX)}; stopping there saves ${formatChange(e.finalValidation - e.bestValidation, kind).replace(/^\+/, "")}${e.gl === null ? "" : ` (generalization loss ${e.gl.toFixed(1)}%)`}.`;
-  const trainLongerReason = (e) => `Train and validation ${ctx.metricName} were both still falling at epoch ${formatNumber(e.finalX)}: train longer.`;
-  for (const p of ctx.pulled) {
-    const { baseline: from, candidate: to } = p.change;
-    if (typeof from !== "number" || typeof to !== "number") continue;
-    const between = from > 0 && to > 0 ? Math.sqrt(from * to) : (from + to) / 2;
-    const overshotTowardBias = ctx.movement === "toward-underfitting" || ctx.movement === "worse-on-both";
-    const overshotTowardVariance = ctx.movement === "toward-overfitting" || ctx.movement === "worse-on-both";
-    if (p.lever === "stronger-regularization" && overshotTowardBias) {
-      add(
-        "weaker-regularization",
-        100,
-        `${p.change.key} rose ${from} \u2192 ${to} and moved the model toward underfitting (\u0394bias ${formatChange(ctx.bias.estimate, kind)}); try ${p.change.key} \u2248 ${formatNumber(between)}, between the two.`,
-        [`\u0394bias ${formatChange(ctx.bias.estimate, kind)}, p ${formatP(ctx.bias.p)}`]
-      );
-    }
-    if (p.lever === "weaker-regularization" && overshotTowardVariance) {
-      add(
-        "stronger-regularization",
-        100,
-        `${p.change.key} fell ${from} \u2192 ${to} and moved the model toward overfitting (\u0394variance ${formatChange(ctx.variance.estimate, kind)}); try ${p.change.key} \u2248 ${formatNumber(between)}, between the two.`,
-        [`\u0394variance ${formatChange(ctx.variance.estimate, kind)}, p ${formatP(ctx.variance.p)}`]
-      );
-    }
-    if ((p.lever === "richer-features" || p.lever === "more-features" || p.lever === "bigger-model") && overshotTowardVariance) {
-      const back = p.lever === "bigger-model" ? "smaller-model" : "fewer-features";
-      add(
-        back,
-        90,
-        `${p.change.key} rose ${from} \u2192 ${to} and moved the model toward overfitting (\u0394variance ${formatChange(ctx.variance.estimate, kind)}); step back toward ${formatNumber(between)} or keep it and regularize harder.`,
-        [`\u0394variance ${formatChange(ctx.variance.estimate, kind)}`]
-      );
-      if (reg !== null && reg.side === "below") {
-        add(
-          "stronger-regularization",
-          95,
-          `Keep the new ${p.change.key} and regularize harder: the candidate's sweep has its validation minimum at \u03BB \u2248 ${formatNumber(reg.bestX)}${ctx.lambda === void 0 ? "" : ` (it uses ${formatNumber(ctx.lambda)})`}; try ${formatNumber(reg.suggestedX)}.`,
-          [`lowest validation ${v(reg.bestValidation)} at \u03BB \u2248 ${formatNumber(reg.bestX)}`]
-        );
-      } else {
-        add(
-          "stronger-regularization",
-          85,
-          `Keep the new ${p.change.key} but counter its extra variance with stronger regularization.`,
-          []
-        );
-      }
-    }
-  }
-  const order = targets(ctx.candidate.diagnosis, ctx.candidate);
-  order.forEach((target, t) => {
-    const component = ctx.candidate.components[target];
-    const label = target === "bias" ? "avoidable bias" : "variance";
-    const size = component.value === null ? "" : `: ${label} ${v(component.value)} against a validation error of ${v(ctx.candidate.errorLevel)}`;
-    BY_TARGET[target].forEach((id, i2) => {
-      let score = 60 - t * 20 - i2 * 2;
-      let reason = `The candidate has high ${target}${size}.`;
-      const evidence = [];
-      if (id === "more-data" && lc !== null) {
-        const twice = lc.projections[0];
-        if (twice !== void 0) {
-          reason = `2\xD7 data projects validation ${ctx.metricName} ${v(ctx.candidate.splits.find((s) => s.split === "validation")?.mean ?? 0)} \u2192 ${v(twice.validation)} (power-law fit R\xB2 ${lc.r2.toFixed(2)}).`;
-          evidence.push(
-            `fit e(m) = ${formatNumber(lc.a)}\xB7m^\u2212${formatNumber(lc.b)} + ${formatNumber(lc.c)}; at ${formatNumber(twice.x)} examples: ${v(twice.ci[0])} to ${v(twice.ci[1])}`
-          );
-        }
-        if (lc.gapTrend === "flat") {
-          score -= 25;
-          reason = `More data will help little: the train/validation gap is flat at the right end of the learning curve.`;
-        } else if (lc.gapTrend === "closing") score += 8;
-      }
-      if ((id === "stronger-regularization" || id === "weaker-regularization") && reg !== null) {
-        const wants = id === "stronger-regularization" ? "below" : "above";
-        if (reg.atEdge !== null) {
-          evidence.push(
-            `the sweep's minimum is at its ${reg.atEdge} end (${formatNumber(reg.bestX)}): extend the sweep`
-          );
-        }
-        if (reg.side === wants) {
-          score += 10;
-          reason = `The regularization sweep has its validation minimum at \u03BB \u2248 ${formatNumber(reg.bestX)}${ctx.lambda === void 0 ? "" : `, the candidate uses ${formatNumber(ctx.lambda)}`}; try ${formatNumber(reg.suggestedX)}.`;
-        } else if (reg.side !== "unknown") {
-          score -= 20;
-          const meaning = LEVER_CATALOGUE[id].meaning;
-          reason = `${meaning.charAt(0).toUpperCase()}${meaning.slice(1)}, but the sweep's validation minimum (\u03BB \u2248 ${formatNumber(reg.bestX)}) is on the other side.`;
-        }
-      }
-      if (id === "early-stopping") {
-        if (ep !== null && ep.stoppedLate) {
-          score += 12;
-          reason = stopEarlierReason(ep);
-        } else {
-          score -= 15;
-          reason = `${reason} ${ep === null ? "No epoch curve to confirm it." : "The epoch curve does not show training past the validation minimum."}`;
-        }
-      }
-      if (id === "train-longer") {
-        if (ep !== null && ep.stoppedEarly) {
-          score += 12;
-          reason = trainLongerReason(ep);
-        } else {
-          score -= 15;
-          reason = `${reason} ${ep === null ? "No epoch curve to confirm it." : "The epoch curve does not show both errors still falling at the end."}`;
-        }
-      }
-      if (id === "weaker-regularization" && ctx.lambda === void 0 && reg === null) score -= 10;
-      const note = pulledNote(id);
-      if (note !== null) {
-        score -= 30;
-        reason = `${reason} Note: ${note}; judge its effect before pulling further.`;
-      }
-      add(id, score, reason, evidence);
-    });
-  });
-  if (ep !== null && ep.stoppedLate && !drafts.has("early-stopping")) {
-    add("early-stopping", 35, stopEarlierReason(ep));
-  }
-  if (ep !== null && ep.stoppedEarly && !drafts.has("train-longer")) {
-    add("train-longer", 35, trainLongerReason(ep));
-  }
-  if (ctx.candidate.diagnosis === "data-mismatch" || ctx.candidate.components.mismatch.present) {
-    const d = ctx.candidate.components.mismatch.value ?? 0;
-    add(
-      "align-training-data",
-      ctx.candidate.diagnosis === "data-mismatch" ? 70 : 30,
-      `Validation error exceeds train_dev error by ${v(d)}: the training data does not look like the validation data; collect or synthesise training data that resembles it.`
-    );
-  }
-  if (ctx.candidate.components.overfit.present) {
-    add(
-      "bigger-validation-set",
-      40,
-      `Test error exceeds validation error by ${v(ctx.candidate.components.overfit.value ?? 0)}: choices may be tuned to the validation set; enlarge or refresh it.`
-    );
-  }
-  if (ctx.candidate.biasUnknown) {
-    add(
-      "supply-reference",
-      20,
-      'Bias is unknown without a reference level: add "reference" (human-level error, a prior system, or an estimated Bayes error) to the artifacts or the config.'
-    );
-  }
-  if (ctx.noiseUnknown) {
-    add(
-      "add-repeats",
-      15,
-      "Run-to-run noise is unknown: train with 2 or more seeds (or ship per-example predictions) so changes can be tested."
-    );
-  }
-  const levers = [...drafts.values()].sort((a, b) => b.score - a.score).map(({ id, reason, evidence }) => ({ id, reason, evidence }));
-  const nonLevers = [];
-  const biasy = ctx.candidate.diagnosis === "high-bias" || ctx.candidate.diagnosis === "high-bias-and-variance";
-  const shrank = ctx.changes.some((c) => c.kind === "lowered" && knobOf(c.key) === "data");
-  if (biasy || shrank) nonLevers.push(SMALLER_TRAINING_SET_NOTE);
-  return { levers, nonLevers };
-}
-
-// src/analysis/movement.ts
-var TABLE = {
-  down: { down: "better-on-both", flat: "away-from-underfitting", up: "toward-overfitting" },
-  flat: { down: "away-from-overfitting", flat: "no-significant-change", up: "toward-overfitting" },
-  up: { down: "toward-underfitting", flat: "toward-underfitting", up: "worse-on-both" }
-};
-function movementOf(biasCall, varianceCall) {
-  return TABLE[biasCall][varianceCall];
-}
-function validationChangeOf(shortfallCall) {
-  return shortfallCall === "up" ? "worse" : shortfallCall === "down" ? "better" : "flat";
 }
 
 // src/analysis/slices.ts
@@ -48290,258 +48943,171 @@ function compareSlices(baseline, candidate, aggregate, settings) {
   }
   unpaired.push(...base.keys());
   const adjusted = holmAdjust(pairs.map((p) => p.test.p));
-  const slices = pairs.map(({ b, c, test }, i2) => {
+  const slices2 = pairs.map(({ b, c, test: test2 }, i2) => {
     const pAdjusted = adjusted[i2] ?? null;
-    const call = callOf({ ...test, p: pAdjusted }, settings);
-    const change = call === "flat" ? "flat" : call === "up" === (sign === 1) ? "worse" : "better";
+    const call = callOf({ ...test2, p: pAdjusted }, settings);
+    const change2 = call === "flat" ? "flat" : call === "up" === (sign === 1) ? "worse" : "better";
     return {
       name: c.name,
       examples: c.examples ?? null,
       baseline: b.validation,
       candidate: c.validation,
-      delta: {
-        estimate: test.estimate,
-        ci: test.ci,
-        p: test.p,
-        test: test.test,
-        call: callOf(test, settings)
-      },
+      delta: toMetricDelta(test2, settings),
       pAdjusted,
-      change,
-      hiddenRegression: change === "worse" && aggregate === "better"
+      change: change2,
+      hiddenRegression: change2 === "worse" && aggregate === "better"
     };
   });
-  return { slices, unpaired };
+  return { slices: slices2, unpaired };
 }
 
 // src/analysis/review.ts
-function splitSummary(run, split, alpha) {
-  const s = run.splits[split];
-  if (s === void 0) return null;
-  const m = mean(s.values);
-  const n = s.values.length;
-  const sd = n >= 2 ? Math.sqrt(sampleVariance(s.values)) : null;
-  let ci = null;
-  if (sd !== null) {
-    const half = tQuantile(1 - alpha / 2, n - 1) * (sd / Math.sqrt(n));
-    ci = [m - half, m + half];
-  } else if (run.metric.kind === "proportion" && s.examples !== void 0) {
-    ci = wilsonInterval(Math.round(m * s.examples), s.examples, alpha);
-  }
-  return { split, mean: m, sd, repeats: n, examples: s.examples ?? null, ci };
+var NOTE_NAMES = 5;
+function failOnOf(values) {
+  return values.map((value2) => {
+    if (!isFailOn(value2)) throw new RangeError(`unknown fail-on outcome ${JSON.stringify(value2)}`);
+    return value2;
+  });
 }
-function lambdaOf(run) {
-  for (const [key, value] of Object.entries(run.hyperparameters ?? {})) {
-    if (typeof value === "number" && knobOf(key) === "regularization" && !/dropout/i.test(key))
-      return value;
-  }
-  return void 0;
-}
-function summarize(run, settings) {
-  const reference = chooseReference(run, settings.reference);
-  const components = decompose(run, reference.value, settings);
-  const diagnosis = diagnose(components);
-  const warnings = [];
-  if (components.overfit.present) {
-    warnings.push(
-      "Test error is well above validation error: model choices may be tuned to the validation set."
-    );
-  }
-  const lambda = lambdaOf(run);
+function reviewSettings(input) {
   return {
-    name: run.run.name,
-    commit: run.run.commit ?? null,
-    createdAt: run.run.createdAt ?? null,
-    reference: reference.value,
-    referenceSource: reference.source,
-    splits: SPLIT_NAMES.flatMap((s) => splitSummary(run, s, settings.alpha) ?? []),
-    errorLevel: errorLevel(run),
-    components,
-    diagnosis,
-    biasUnknown: reference.value === null,
-    warnings,
-    curves: analyzeCurves(run.curves, {
-      ...lambda === void 0 ? {} : { lambda },
-      kind: run.metric.kind,
-      goal: run.metric.goal
-    })
+    alpha: input.alpha,
+    minEffect: input.minEffect,
+    gapTolerance: input.gapTolerance,
+    failOn: failOnOf(input.failOn)
   };
 }
-function pairedTest(paired, run, alpha) {
-  if (paired.rows === 0) return null;
-  if (paired.kind === "proportion") {
-    const result = mcnemarExact(
-      paired.baselineOnly ?? 0,
-      paired.candidateOnly ?? 0,
-      paired.rows,
-      alpha
-    );
-    return run.metric.goal === "minimize" ? toMetricUnits(result, -1) : result;
-  }
-  return pairedT(
-    { n: paired.rows, mean: paired.meanDiff ?? 0, variance: paired.varDiff ?? 0 },
-    alpha
-  );
-}
-function both(measure) {
-  return { baseline: measure, candidate: measure };
-}
+var NO_BIAS_CHANGE = {
+  unit: "shortfall",
+  estimate: 0,
+  ci: null,
+  p: null,
+  test: "none",
+  call: "flat"
+};
 function buildReview(input) {
-  const { baseline, candidate, settings } = input;
+  const { baseline, candidate } = input;
+  const settings = reviewSettings(input.settings);
   const calls = { alpha: settings.alpha, minEffect: settings.minEffect };
-  const sign = shortfallSign(candidate);
-  const notes = [...input.notes ?? []];
-  const base = summarize(baseline, settings);
-  const cand = summarize(candidate, settings);
-  const pairedSplit = input.paired?.split ?? "validation";
-  const shortfallChanges = /* @__PURE__ */ new Map();
-  for (const split of SPLIT_NAMES) {
-    let result = measureChange(baseline, candidate, both(splitMeasure(split)), settings.alpha);
-    if (result === null) continue;
-    if (input.paired !== void 0 && split === pairedSplit && (result.test === "none" || result.test === "z-binomial")) {
-      const paired2 = pairedTest(input.paired, candidate, settings.alpha);
-      if (paired2 !== null) result = toMetricUnits(paired2, sign);
-    }
-    shortfallChanges.set(split, result);
-  }
-  const validationShortfall = shortfallChanges.get("validation");
+  const reference = input.settings.reference;
+  const summarySettings = { ...settings, ...reference === void 0 ? {} : { reference } };
+  const base = summarize(baseline, summarySettings);
+  const cand = summarize(candidate, summarySettings);
+  const runs = { baseline, candidate };
+  const shortfalls = splitShortfalls(runs, settings.alpha, input.paired);
+  const validationShortfall = shortfalls.get("validation");
   if (validationShortfall === void 0)
     throw new Error("validation split is required by the schema");
-  const validationDelta = toDelta(validationShortfall, calls);
-  const splits = [];
-  for (const [split, result] of shortfallChanges) {
-    const b = base.splits.find((s) => s.split === split);
-    const c = cand.splits.find((s) => s.split === split);
-    if (b === void 0 || c === void 0) continue;
-    splits.push({
-      split,
-      baseline: b.mean,
-      candidate: c.mean,
-      delta: toDelta(toMetricUnits(result, sign), calls)
-    });
-  }
-  const refB = base.reference;
-  const refC = cand.reference;
-  const [biasRefB, biasRefC] = refB !== null && refC !== null ? [refB, refC] : [0, 0];
-  const biasResult = measureChange(
-    baseline,
-    candidate,
-    {
-      baseline: componentMeasures(baseline, biasRefB).bias ?? splitMeasure("train"),
-      candidate: componentMeasures(candidate, biasRefC).bias ?? splitMeasure("train")
-    },
-    settings.alpha
+  const components = componentChanges(
+    runs,
+    { baseline: base.reference, candidate: cand.reference },
+    calls
   );
-  const componentChange = (name) => {
-    const mb = componentMeasures(baseline, refB)[name];
-    const mc = componentMeasures(candidate, refC)[name];
-    if (mb === null || mc === null) return null;
-    if (name === "variance" && baseline.splits.train_dev === void 0 !== (candidate.splits.train_dev === void 0)) {
-      const fallback = {
-        terms: [
-          { split: "validation", weight: 1 },
-          { split: "train", weight: -1 }
-        ],
-        constant: 0
-      };
-      notes.push(
-        "Only one run has a train_dev split: the variance change is measured as validation \u2212 train in both."
-      );
-      const r2 = measureChange(baseline, candidate, both(fallback), settings.alpha);
-      return r2 === null ? null : toDelta(r2, calls);
-    }
-    const r = measureChange(baseline, candidate, { baseline: mb, candidate: mc }, settings.alpha);
-    return r === null ? null : toDelta(r, calls);
+  const movement = movementOf(components.bias?.call ?? "flat", components.variance.call);
+  const validation = {
+    change: validationChangeOf(toShortfallDelta(validationShortfall, calls).call),
+    delta: toMetricDelta(toMetricUnits(validationShortfall, shortfallSign(candidate)), calls)
   };
-  const biasDelta = biasResult === null ? null : toDelta(biasResult, calls);
-  const varianceDelta = componentChange("variance");
-  if (varianceDelta === null)
-    throw new Error("variance needs train and validation, which the schema requires");
-  const movement = movementOf(biasDelta?.call ?? "flat", varianceDelta.call);
-  const validationChange = validationChangeOf(validationDelta.call);
-  const sliceResult = compareSlices(baseline, candidate, validationChange, calls);
-  if (sliceResult.unpaired.length > 0) {
-    notes.push(
-      `${sliceResult.unpaired.length} slice(s) appear in one run only and were not compared: ${sliceResult.unpaired.slice(0, 5).join(", ")}${sliceResult.unpaired.length > 5 ? ", \u2026" : ""}.`
-    );
-  }
-  const hidden = sliceResult.slices.filter((s) => s.hiddenRegression);
-  if (hidden.length > 0) {
-    notes.push(
-      `Validation improved overall, yet ${hidden.length} slice(s) regressed significantly (Holm-adjusted): ${hidden.slice(0, 5).map((s) => s.name).join(", ")}.`
-    );
-  }
-  const noiseUnknown = validationDelta.test === "none" || varianceDelta.test === "none";
-  if (noiseUnknown) {
-    notes.push(
-      settings.minEffect > 0 ? `Run-to-run noise is unknown (one repeat of a continuous metric, no per-example predictions): changes are called on size alone (min-effect ${formatValue(settings.minEffect, candidate.metric.kind)}).` : "Run-to-run noise is unknown (one repeat of a continuous metric, no per-example predictions) and min-effect is 0: no change can be called. Add repeats (seeds), per-example predictions, or set min-effect."
-    );
-  }
-  if (cand.biasUnknown) {
-    notes.push(
-      "Avoidable bias is unknown: there is no reference level for this metric. Its change is still measured from the training error; the diagnosis rests on variance and data mismatch."
-    );
-  }
-  if (input.paired !== void 0 && input.paired.rows === 0) {
-    notes.push("The two predictions files share no id: the paired test was not used.");
-  }
+  const sliceResult = compareSlices(baseline, candidate, validation.change, calls);
+  const noiseUnknown = validation.delta.test === "none" || components.variance.test === "none";
   const changes = diffHyperparameters(baseline.hyperparameters, candidate.hyperparameters);
-  const lambda = lambdaOf(candidate);
-  const { levers, nonLevers } = chooseLevers({
-    kind: candidate.metric.kind,
-    metricName: candidate.metric.name,
+  const { levers, nonLevers: nonLevers2 } = chooseLevers({
+    goal: candidate.metric.goal,
     candidate: cand,
     baseline: base,
     movement,
-    bias: biasDelta ?? { estimate: 0, ci: null, p: null, test: "none", call: "flat" },
-    variance: varianceDelta,
+    bias: components.bias ?? NO_BIAS_CHANGE,
+    variance: components.variance,
     pulled: pulledLevers(changes),
     changes,
-    lambda,
+    regularization: regularizationOf(candidate),
     noiseUnknown
   });
-  const partial = {
-    movement,
-    validation: {
-      change: validationChange,
-      delta: toDelta(toMetricUnits(validationShortfall, sign), calls)
+  const hasGuardrails = baseline.guardrails !== void 0 || candidate.guardrails !== void 0;
+  const guardrails = hasGuardrails ? reviewGuardrails(baseline, candidate, {
+    alpha: settings.alpha,
+    margins: input.settings.guardrailMargins ?? /* @__PURE__ */ new Map()
+  }) : void 0;
+  const cost = baseline.cost !== void 0 || candidate.cost !== void 0 ? reviewCost(baseline, candidate, settings.alpha) : void 0;
+  const gate = applyGate(
+    {
+      movement,
+      validation,
+      slices: sliceResult.slices,
+      candidate: cand,
+      ...guardrails === void 0 ? {} : { guardrails },
+      ...cost === void 0 ? {} : { cost }
     },
-    slices: sliceResult.slices,
-    candidate: cand,
-    settings: {
-      alpha: settings.alpha,
-      minEffect: settings.minEffect,
-      gapTolerance: settings.gapTolerance,
-      failOn: [...settings.failOn]
-    }
-  };
-  const gate = applyGate(partial);
-  const paired = input.paired === void 0 ? null : {
-    rows: input.paired.rows,
-    test: input.paired.kind === "proportion" ? "mcnemar-exact" : "paired-t",
-    ...input.paired.kind === "proportion" ? {
-      discordant: {
-        baselineOnly: input.paired.baselineOnly ?? 0,
-        candidateOnly: input.paired.candidateOnly ?? 0
-      }
-    } : {}
-  };
+    settings.failOn
+  );
   return {
     format: "fitgap-review/1",
     metric: { ...candidate.metric },
-    ...partial,
-    bias: { delta: biasDelta },
-    variance: { delta: varianceDelta },
-    mismatch: { delta: componentChange("mismatch") },
-    overfit: { delta: componentChange("overfit") },
-    splits,
+    settings,
+    movement,
+    validation,
+    bias: { delta: components.bias },
+    variance: { delta: components.variance },
+    mismatch: { delta: components.mismatch },
+    overfit: { delta: components.overfit },
+    splits: splitChanges(shortfalls, runs, { baseline: base, candidate: cand }, calls),
     baseline: base,
+    candidate: cand,
+    slices: sliceResult.slices,
     hyperparameters: changes,
     levers,
-    nonLevers,
+    nonLevers: nonLevers2,
     gate,
-    notes,
-    paired
+    ...guardrails === void 0 ? {} : { guardrails },
+    ...cost === void 0 ? {} : { cost },
+    notes: [
+      ...input.notes ?? [],
+      ...reviewNotes({
+        components,
+        unpaired: sliceResult.unpaired,
+        slices: sliceResult.slices,
+        noiseUnknown,
+        biasUnknown: cand.biasUnknown,
+        paired: input.paired
+      })
+    ],
+    paired: pairedSummary(input.paired)
+  };
+}
+function reviewNotes(facts) {
+  const notes = [];
+  if (facts.components.varianceFallback) notes.push({ code: "train-dev-in-one-run" });
+  if (facts.unpaired.length > 0) {
+    notes.push({
+      code: "unpaired-slices",
+      count: facts.unpaired.length,
+      names: facts.unpaired.slice(0, NOTE_NAMES)
+    });
+  }
+  const hidden = facts.slices.filter((s) => s.hiddenRegression);
+  if (hidden.length > 0) {
+    notes.push({
+      code: "hidden-regressions",
+      count: hidden.length,
+      names: hidden.slice(0, NOTE_NAMES).map((s) => s.name)
+    });
+  }
+  if (facts.noiseUnknown) notes.push({ code: "noise-unknown" });
+  if (facts.biasUnknown) notes.push({ code: "bias-unknown" });
+  if (facts.paired !== void 0 && facts.paired.rows === 0)
+    notes.push({ code: "predictions-share-no-id" });
+  return notes;
+}
+function pairedSummary(paired) {
+  if (paired === void 0) return null;
+  if (paired.kind === "continuous") return { rows: paired.rows, test: "paired-t" };
+  return {
+    rows: paired.rows,
+    test: "mcnemar-exact",
+    discordant: {
+      baselineOnly: paired.baselineOnly ?? 0,
+      candidateOnly: paired.candidateOnly ?? 0
+    }
   };
 }
 
@@ -48549,98 +49115,6 @@ function buildReview(input) {
 import { createHash } from "node:crypto";
 import { lstat as lstat2 } from "node:fs/promises";
 import { dirname as dirname2, relative as relative2, resolve as resolve2, sep } from "node:path";
-
-// src/model/settings.ts
-var FAIL_ON_VALUES = [
-  "worse-validation",
-  "toward-overfitting",
-  "toward-underfitting",
-  "worse-on-both",
-  "any-movement",
-  "slice-regression",
-  "high-bias",
-  "high-variance",
-  "data-mismatch",
-  "validation-overfit",
-  "none"
-];
-function isFailOn(value) {
-  return FAIL_ON_VALUES.includes(value);
-}
-var DEFAULT_SETTINGS = {
-  alpha: 0.05,
-  minEffect: 0,
-  gapTolerance: 0.1,
-  failOn: ["worse-validation"]
-};
-var NUMBER_SETTINGS = {
-  alpha: { min: 1e-6, max: 0.5, about: "significance level" },
-  "min-effect": { min: 0, max: MAX_MAGNITUDE, about: "smallest change that counts" },
-  "gap-tolerance": { min: 0, max: 1, about: "component present at this fraction of the error" },
-  reference: { min: -MAX_MAGNITUDE, max: MAX_MAGNITUDE, about: "reference level" }
-};
-var DECIMAL = /^[+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:[eE][+-]?\d+)?$/;
-function parseDecimal(text2) {
-  const trimmed = text2.trim();
-  if (!DECIMAL.test(trimmed)) return null;
-  const value = Number(trimmed);
-  return Number.isFinite(value) ? value : null;
-}
-function rangeText(name) {
-  const { min, max: max2 } = NUMBER_SETTINGS[name];
-  return `must be a number from ${formatLimit(min)} to ${formatLimit(max2)}`;
-}
-function numberSettingIssues(name, value, source) {
-  const { min, max: max2 } = NUMBER_SETTINGS[name];
-  if (Number.isFinite(value) && value >= min && value <= max2) return [];
-  return [{ ...source, expected: rangeText(name), got: quote(value) }];
-}
-function parseNumberSetting(name, text2, source) {
-  const value = parseDecimal(text2);
-  if (value === null)
-    return { issues: [{ ...source, expected: rangeText(name), got: quote(text2) }] };
-  const issues = numberSettingIssues(name, value, source);
-  return issues.length > 0 ? { issues } : { value };
-}
-var FAIL_ON_SEPARATORS = /[,\n]/;
-function failOnIssues(values, source) {
-  const at = (i2) => source.pointer === "" ? "" : `${source.pointer}/${i2}`;
-  if (values.length === 0) {
-    return [
-      {
-        ...source,
-        expected: "must name at least one outcome",
-        got: "an empty list",
-        hint: "Write 'none' for a gate that never fails, or leave the setting out for the default (worse-validation)."
-      }
-    ];
-  }
-  const issues = values.flatMap(
-    (value, i2) => isFailOn(value) ? [] : [
-      {
-        ...source,
-        pointer: at(i2),
-        expected: `must be one of ${FAIL_ON_VALUES.join(", ")}`,
-        got: quote(value),
-        hint: "Separate outcomes with commas or new lines."
-      }
-    ]
-  );
-  if (issues.length === 0 && values.length > 1 && values.includes("none")) {
-    issues.push({
-      ...source,
-      pointer: at(values.indexOf("none")),
-      expected: "must not combine 'none' with other outcomes",
-      got: quote(values.join(","))
-    });
-  }
-  return issues;
-}
-function parseFailOn(text2, source) {
-  const values = text2.split(FAIL_ON_SEPARATORS).map((s) => s.trim()).filter((s) => s !== "");
-  const issues = failOnIssues(values, source);
-  return issues.length > 0 ? { issues } : { value: values };
-}
 
 // src/artifact/epoch-log.ts
 function splitCsvLine(line) {
@@ -48692,8 +49166,8 @@ function parseEpochLog(text2, file, mapping) {
     const cells = splitCsvLine(raw);
     const read = (index, name) => {
       const cell = cells[index] ?? "";
-      const value = parseDecimal(cell) ?? Number.NaN;
-      if (!Number.isFinite(value) || Math.abs(value) > MAX_MAGNITUDE) {
+      const value2 = parseDecimal(cell) ?? Number.NaN;
+      if (!Number.isFinite(value2) || Math.abs(value2) > MAX_MAGNITUDE) {
         issues.push({
           file,
           pointer: `line ${i2 + 1}`,
@@ -48702,7 +49176,7 @@ function parseEpochLog(text2, file, mapping) {
         });
         return Number.NaN;
       }
-      return value;
+      return value2;
     };
     const point = { x: read(xi, mapping.x), validation: read(vi, mapping.validation) };
     if (ti !== void 0 && mapping.train !== void 0) point.train = read(ti, mapping.train);
@@ -48907,6 +49381,100 @@ var fitgap_run_1_schema_default = {
           description: "Which repeat (0-based position in `values`) the predictions belong to; default 0."
         }
       }
+    },
+    guardrails: {
+      type: "array",
+      maxItems: 50,
+      description: "Metrics that must not get worse by more than a margin (calibration error, a fairness gap, latency\u2026), reviewed beside the primary metric.",
+      items: {
+        type: "object",
+        required: ["metric", "splits"],
+        additionalProperties: false,
+        properties: {
+          metric: {
+            type: "object",
+            required: ["name", "goal", "kind"],
+            additionalProperties: false,
+            properties: {
+              name: {
+                type: "string",
+                minLength: 1,
+                maxLength: 100
+              },
+              goal: {
+                enum: ["minimize", "maximize"]
+              },
+              kind: {
+                enum: ["proportion", "continuous"]
+              },
+              best: {
+                type: "number",
+                description: "Best possible value of the metric: 1 for accuracy, AUC and R\xB2, 100 for a 0\u2013100 score, 0 for an error. The error level of a maximized metric is best \u2212 value."
+              },
+              unit: {
+                type: "string",
+                minLength: 1,
+                maxLength: 40,
+                description: `Unit of the metric's values, for labels (e.g. "ms", "BLEU"). Proportions need none.`
+              }
+            },
+            description: "The guardrail's metric; the same fields as the primary metric."
+          },
+          splits: {
+            type: "object",
+            required: ["validation"],
+            additionalProperties: false,
+            properties: {
+              validation: {
+                $ref: "#/$defs/split"
+              },
+              test: {
+                $ref: "#/$defs/split"
+              }
+            }
+          },
+          margin: {
+            type: "number",
+            minimum: 0,
+            description: "Non-inferiority margin in the metric's units: the largest worsening still acceptable. Without it (here or in the config) the guardrail is reported but never gates."
+          }
+        }
+      }
+    },
+    cost: {
+      type: "object",
+      additionalProperties: false,
+      description: "What the run cost. Per-repeat lists give ratios with intervals.",
+      properties: {
+        trainSeconds: {
+          type: "array",
+          minItems: 1,
+          items: {
+            type: "number",
+            exclusiveMinimum: 0
+          },
+          description: "Training wall-clock seconds, one per repeat."
+        },
+        inferenceMs: {
+          type: "array",
+          minItems: 1,
+          items: {
+            type: "number",
+            exclusiveMinimum: 0
+          },
+          description: "Inference latency in milliseconds, one per repeat."
+        },
+        parameters: {
+          type: "number",
+          exclusiveMinimum: 0,
+          description: "Number of trained parameters."
+        },
+        memoryMb: {
+          type: "number",
+          exclusiveMinimum: 0,
+          description: "Peak memory in megabytes."
+        }
+      }
     }
   },
   $defs: {
@@ -48955,6 +49523,47 @@ var fitgap_run_1_schema_default = {
   }
 };
 
+// src/validate/guardrails.ts
+function guardrailIssues(run, file) {
+  const issues = [];
+  const names2 = /* @__PURE__ */ new Map();
+  run.guardrails?.forEach((guardrail, g) => {
+    const at = `/guardrails/${g}`;
+    const first = names2.get(guardrail.metric.name);
+    if (first !== void 0) {
+      issues.push({
+        file,
+        pointer: `${at}/metric/name`,
+        expected: `must be unique among the guardrails (also at /guardrails/${first}/metric/name)`,
+        got: quote(guardrail.metric.name)
+      });
+    } else names2.set(guardrail.metric.name, g);
+    if (guardrail.metric.name === run.metric.name) {
+      issues.push({
+        file,
+        pointer: `${at}/metric/name`,
+        expected: "must differ from the primary metric",
+        got: quote(guardrail.metric.name),
+        hint: "The primary metric is reviewed already; a guardrail is another metric."
+      });
+    }
+    for (const [split, values] of Object.entries(guardrail.splits)) {
+      values.values.forEach((v, i2) => {
+        if (guardrail.metric.kind === "proportion" && (v < 0 || v > 1)) {
+          issues.push({
+            file,
+            pointer: `${at}/splits/${split}/values/${i2}`,
+            expected: "must be within [0, 1] for a proportion metric",
+            got: quote(v),
+            hint: 'Write rates as fractions (0.07, not 7), or declare metric.kind "continuous".'
+          });
+        }
+      });
+    }
+  });
+  return issues;
+}
+
 // src/validate/run.ts
 var formatsModule = import_ajv_formats.default;
 var addFormats = typeof formatsModule === "function" ? formatsModule : formatsModule.default;
@@ -48970,13 +49579,13 @@ function validator() {
 function semanticIssues(run, file) {
   const issues = [];
   const proportion = run.metric.kind === "proportion";
-  const inUnit = (value, pointer) => {
-    if (proportion && (value < 0 || value > 1)) {
+  const inUnit = (value2, pointer) => {
+    if (proportion && (value2 < 0 || value2 > 1)) {
       issues.push({
         file,
         pointer,
         expected: "must be within [0, 1] for a proportion metric",
-        got: quote(value),
+        got: quote(value2),
         hint: 'Write rates as fractions (0.07, not 7), or declare metric.kind "continuous".'
       });
     }
@@ -49047,9 +49656,9 @@ function semanticIssues(run, file) {
     inUnit(slice.validation, `/slices/${i2}/validation`);
     if (slice.train !== void 0) inUnit(slice.train, `/slices/${i2}/train`);
   });
-  const names = /* @__PURE__ */ new Map();
+  const names2 = /* @__PURE__ */ new Map();
   run.slices?.forEach((slice, i2) => {
-    const first = names.get(slice.name);
+    const first = names2.get(slice.name);
     if (first !== void 0) {
       issues.push({
         file,
@@ -49057,7 +49666,7 @@ function semanticIssues(run, file) {
         expected: `must be unique (also at /slices/${first}/name)`,
         got: quote(slice.name)
       });
-    } else names.set(slice.name, i2);
+    } else names2.set(slice.name, i2);
   });
   if (run.predictions !== void 0) {
     const p = run.predictions.path;
@@ -49071,6 +49680,7 @@ function semanticIssues(run, file) {
       });
     }
   }
+  issues.push(...guardrailIssues(run, file));
   return issues;
 }
 function validateRun(doc, file) {
@@ -49078,11 +49688,11 @@ function validateRun(doc, file) {
   if (numbers.length > 0) {
     throw new InputError(
       numbers.map(
-        ({ pointer, value }) => Number.isFinite(value) ? {
+        ({ pointer, value: value2 }) => Number.isFinite(value2) ? {
           file,
           pointer,
           expected: `must be within \xB1${formatLimit(MAX_MAGNITUDE)}`,
-          got: quote(value),
+          got: quote(value2),
           hint: pointer.startsWith("/hyperparameters/") ? "Write large identifiers (seeds, hashes) as strings." : "Rescale the metric (thousands instead of units); larger values overflow in the statistics."
         } : {
           file,
@@ -49178,9 +49788,7 @@ async function loadRun(path, options = {}) {
     const present = logPath !== null && await lstat2(logPath).catch(() => null) !== null;
     if (logPath !== null && present) {
       if (artifact.curves?.epochs !== void 0) {
-        notes.push(
-          `${file}: the artifact has its own curves.epochs; the epoch log ${logName} was not used.`
-        );
+        notes.push({ code: "epoch-log-not-used", file, log: logName });
       } else {
         const log = await readChecked({
           path: logPath,
@@ -49200,9 +49808,7 @@ async function loadRun(path, options = {}) {
         if (issues.length > 0) throw new InputError(issues);
       }
     } else {
-      notes.push(
-        `No epoch log ${logName} next to ${file}; the config's epoch-log mapping was not applied to it.`
-      );
+      notes.push({ code: "epoch-log-missing", file, log: logName });
     }
   }
   return { artifact, file, sha256, predictionsPath, predictions, notes, read };
@@ -49244,8 +49850,8 @@ var HashLog = class {
 function parseValue(raw, kind, file, line) {
   const column = kind === "proportion" ? "correct" : "loss";
   const text2 = raw.trim();
-  const value = kind === "proportion" ? text2 === "0" || text2 === "1" ? Number(text2) : Number.NaN : parseDecimal(text2) ?? Number.NaN;
-  if (!Number.isFinite(value) || Math.abs(value) > MAX_MAGNITUDE) {
+  const value2 = kind === "proportion" ? text2 === "0" || text2 === "1" ? Number(text2) : Number.NaN : parseDecimal(text2) ?? Number.NaN;
+  if (!Number.isFinite(value2) || Math.abs(value2) > MAX_MAGNITUDE) {
     throw new InputError([
       {
         file,
@@ -49255,7 +49861,7 @@ function parseValue(raw, kind, file, line) {
       }
     ]);
   }
-  return value;
+  return value2;
 }
 async function* readRows(source, kind, hashes) {
   const file = source.file;
@@ -49449,7 +50055,7 @@ var fitgap_config_schema_default = {
       description: "Reference level (human-level, prior system, Bayes error) overriding the artifacts'; within [0, 1] for a proportion metric."
     },
     "fail-on": {
-      description: "Outcomes that fail the gate: a list, or one text with the outcomes separated by commas or new lines. 'none' never fails and stands alone; an empty list is refused.",
+      description: "Outcomes that fail the gate (README 'Gate'): a list, or one text with the outcomes separated by commas or new lines. 'none' never fails and stands alone; an empty list is refused.",
       oneOf: [
         {
           type: "string",
@@ -49460,18 +50066,27 @@ var fitgap_config_schema_default = {
           minItems: 1,
           items: {
             type: "string",
-            enum: [
-              "worse-validation",
-              "toward-overfitting",
-              "toward-underfitting",
-              "worse-on-both",
-              "any-movement",
-              "slice-regression",
-              "high-bias",
-              "high-variance",
-              "data-mismatch",
-              "validation-overfit",
-              "none"
+            anyOf: [
+              {
+                enum: [
+                  "worse-validation",
+                  "toward-overfitting",
+                  "toward-underfitting",
+                  "worse-on-both",
+                  "any-movement",
+                  "slice-regression",
+                  "high-bias",
+                  "high-variance",
+                  "data-mismatch",
+                  "validation-overfit",
+                  "guardrail-regression",
+                  "guardrail-undetermined",
+                  "none"
+                ]
+              },
+              {
+                pattern: "^(train-seconds|inference-ms|parameters|memory-mb)-ratio>((?:0|[1-9][0-9]*)(?:\\.[0-9]+)?)$"
+              }
             ]
           }
         }
@@ -49502,6 +50117,67 @@ var fitgap_config_schema_default = {
           type: "string",
           minLength: 1,
           description: "Column holding the validation metric."
+        }
+      }
+    },
+    hyperparameters: {
+      type: "object",
+      description: "Roles of hyperparameter names fitgap does not know, or knows differently: each name maps to a role and whether raising it lowers that role (`inverse`, as scikit-learn's C). Names match case-insensitively with '-' and '_' alike; a dotted or `__` path also matches by its last segment. Overrides the built-in vocabulary (README 'Hyperparameter vocabulary').",
+      maxProperties: 200,
+      propertyNames: {
+        type: "string",
+        minLength: 1,
+        maxLength: 200
+      },
+      additionalProperties: {
+        type: "object",
+        required: ["role"],
+        additionalProperties: false,
+        properties: {
+          role: {
+            type: "string",
+            enum: [
+              "regularization",
+              "capacity",
+              "features",
+              "polynomial-degree",
+              "data-size",
+              "epochs",
+              "early-stopping-patience",
+              "learning-rate",
+              "inert"
+            ],
+            description: "What the knob controls."
+          },
+          inverse: {
+            type: "boolean",
+            description: "Raising the value lowers the role (a smaller C is stronger regularization). Default false."
+          },
+          integer: {
+            type: "boolean",
+            description: "The knob takes integers (suggestions are rounded to integers). Default: true for capacity, features, polynomial-degree, data-size, epochs and early-stopping-patience."
+          },
+          scale: {
+            type: "string",
+            enum: ["log", "linear"],
+            description: "How the knob is tuned: `log` (by factors; geometric midpoints) or `linear` (by steps). Default: linear for integers, log otherwise."
+          }
+        }
+      }
+    },
+    guardrails: {
+      type: "object",
+      description: "Non-inferiority margins of guardrail metrics, by guardrail name; they override the artifacts' margins (the config is trusted, an artifact from a pull request is not).",
+      additionalProperties: {
+        type: "object",
+        required: ["margin"],
+        additionalProperties: false,
+        properties: {
+          margin: {
+            type: "number",
+            minimum: 0,
+            description: "Largest acceptable worsening, in the guardrail metric's units."
+          }
         }
       }
     },
@@ -49583,12 +50259,12 @@ function checkSettings(data, file) {
   const { "fail-on": failOn, ...rest } = data;
   const issues = [];
   for (const key of NUMBER_KEYS) {
-    const value = rest[key];
-    if (value === void 0) continue;
+    const value2 = rest[key];
+    if (value2 === void 0) continue;
     const source2 = { file, pointer: `/${key}` };
-    if (typeof value !== "number") {
-      issues.push({ ...source2, expected: "must be a number", got: quote(value) });
-    } else issues.push(...numberSettingIssues(key, value, source2));
+    if (typeof value2 !== "number") {
+      issues.push({ ...source2, expected: "must be a number", got: quote(value2) });
+    } else issues.push(...numberSettingIssues(key, value2, source2));
   }
   if (issues.length > 0) throw new InputError(issues);
   if (failOn === void 0) return rest;
@@ -49703,14 +50379,14 @@ function resolveLimits(config, given = {}) {
 function referenceIssues(config, options, configFile, kind) {
   if (kind !== "proportion") return [];
   const fromFlag = options.overrides?.reference;
-  const value = fromFlag ?? config.reference;
-  if (value === void 0 || value >= 0 && value <= 1) return [];
+  const value2 = fromFlag ?? config.reference;
+  if (value2 === void 0 || value2 >= 0 && value2 <= 1) return [];
   return [
     {
       file: fromFlag !== void 0 ? options.overrideLabel?.("reference") ?? "--reference" : configFile,
       pointer: fromFlag !== void 0 ? "" : "/reference",
       expected: "must be within [0, 1] for a proportion metric",
-      got: quote(value),
+      got: quote(value2),
       hint: "Write the reference as a fraction (0.02, not 2)."
     }
   ];
@@ -49723,7 +50399,12 @@ function resolveSettings(config, overrides = {}) {
     minEffect: overrides.minEffect ?? config["min-effect"] ?? DEFAULT_SETTINGS.minEffect,
     gapTolerance: overrides.gapTolerance ?? config["gap-tolerance"] ?? DEFAULT_SETTINGS.gapTolerance,
     failOn: overrides.failOn ?? config["fail-on"] ?? [...DEFAULT_SETTINGS.failOn],
-    ...reference === void 0 ? {} : { reference }
+    ...reference === void 0 ? {} : { reference },
+    ...config.guardrails === void 0 ? {} : {
+      guardrailMargins: new Map(
+        Object.entries(config.guardrails).map(([name, g]) => [name, g.margin])
+      )
+    }
   };
 }
 function sameMetric(baseline, candidate) {
@@ -49749,12 +50430,12 @@ async function pairIfBoth(baseline, candidate) {
   };
   if (baseline.predictions === null || candidate.predictions === null || bp === void 0 || cp === void 0) {
     return unpaired(
-      bp !== cp && (bp === void 0 || cp === void 0) ? ["Only one run ships per-example predictions: no paired test."] : []
+      bp !== cp && (bp === void 0 || cp === void 0) ? [{ code: "predictions-in-one-run" }] : []
     );
   }
   if (bp.split !== cp.split) {
     return unpaired([
-      `The predictions are for different splits (${bp.split} vs ${cp.split}): no paired test.`
+      { code: "predictions-split-mismatch", baseline: bp.split, candidate: cp.split }
     ]);
   }
   const result = await pairPredictions(baseline.predictions, candidate.predictions, kind);
@@ -49772,9 +50453,12 @@ async function pairIfBoth(baseline, candidate) {
     ]);
   }
   if (unmatched.baseline + unmatched.candidate > 0) {
-    notes.push(
-      `Predictions paired by id: ${result.rows} rows in both; ${unmatched.baseline} baseline and ${unmatched.candidate} candidate rows had no partner and were left out of the paired test.`
-    );
+    notes.push({
+      code: "predictions-unmatched",
+      rows: result.rows,
+      baseline: unmatched.baseline,
+      candidate: unmatched.candidate
+    });
   }
   return { paired: { ...paired, split: bp.split }, notes };
 }
@@ -49842,9 +50526,312 @@ async function reviewFiles(options) {
   }
 }
 
+// src/report/escape.ts
+var DEFAULT_MAX_NAME = 80;
+var ZWJ = "\u200D";
+var REMOVED = /[\p{Cc}\p{Cf}\p{Cs}]/gu;
+var BREAKS = /[\t\n\v\f\r\u0085\u2028\u2029]/g;
+function plainText(text2, maxChars = DEFAULT_MAX_NAME) {
+  const cleaned = text2.replace(BREAKS, " ").replace(REMOVED, "").replace(/\s+/g, " ").trim();
+  return truncate(cleaned, maxChars);
+}
+function truncate(text2, maxChars) {
+  const points = Array.from(text2);
+  if (points.length <= maxChars) return text2;
+  return `${points.slice(0, Math.max(0, maxChars - 1)).join("").trimEnd()}\u2026`;
+}
+function escapeInline(text2, maxChars = DEFAULT_MAX_NAME) {
+  const plain = plainText(text2, maxChars);
+  let out = "";
+  for (const ch of plain) {
+    out += escapeChar(ch);
+  }
+  return out.replace(/:\/\//g, `:${ZWJ}//`).replace(/\b(www)\./gi, `$1${ZWJ}.`).replace(/\b(GH)-(?=\d)/gi, `$1-${ZWJ}`);
+}
+function escapeChar(ch) {
+  switch (ch) {
+    case "&":
+      return "&amp;";
+    case "<":
+      return "&lt;";
+    case ">":
+      return "&gt;";
+    case "@":
+      return `@${ZWJ}`;
+    case "#":
+      return `\\#${ZWJ}`;
+    default:
+      return MARKDOWN_PUNCTUATION.has(ch) ? `\\${ch}` : ch;
+  }
+}
+var MARKDOWN_PUNCTUATION = /* @__PURE__ */ new Set(["\\", "`", "*", "_", "[", "]", "|", "~", "$"]);
+function mermaidLabel(text2, maxChars = 60) {
+  const kept = plainText(text2, Number.MAX_SAFE_INTEGER).replace(/[^\p{L}\p{N} .,\-+()/=]/gu, " ").replace(/ {2,}/g, " ").trim();
+  return truncate(kept, maxChars);
+}
+function displayValue(value2) {
+  if (value2 === void 0) return "(absent)";
+  if (typeof value2 === "string") return value2;
+  if (typeof value2 === "number" || typeof value2 === "boolean" || value2 === null) {
+    return String(value2);
+  }
+  try {
+    return JSON.stringify(value2) ?? String(value2);
+  } catch {
+    return String(value2);
+  }
+}
+
+// src/report/format.ts
+var MINUS = "\u2212";
+var SIGNIFICANT = 4;
+var MAX_DECIMALS = 6;
+function numberFormatFor(review) {
+  return formatForValues(
+    review.metric.kind,
+    review.splits.flatMap((s) => [s.baseline, s.candidate])
+  );
+}
+function formatForValues(kind, values) {
+  let largest = 0;
+  for (const v of values) largest = Math.max(largest, Math.abs(v));
+  const decimals = largest === 0 || !Number.isFinite(largest) ? SIGNIFICANT : Math.min(MAX_DECIMALS, Math.max(0, SIGNIFICANT - 1 - Math.floor(Math.log10(largest))));
+  return { kind, decimals };
+}
+function digits(v, f) {
+  const proportion = f.kind === "proportion";
+  const text2 = (proportion ? v * 100 : v).toFixed(
+    proportion ? Math.max(0, f.decimals - 2) : f.decimals
+  );
+  if (/^-0(\.0+)?$/.test(text2)) return text2.slice(1);
+  return text2.replace("-", MINUS);
+}
+function isZero(text2) {
+  return /^0(\.0+)?$/.test(text2);
+}
+function value(v, f) {
+  return f.kind === "proportion" ? `${digits(v, f)}%` : digits(v, f);
+}
+function unit(f) {
+  return f.kind === "proportion" ? " pts" : "";
+}
+function signedDigits(v, f) {
+  const text2 = digits(Math.abs(v), f);
+  if (isZero(text2)) return text2;
+  return v > 0 ? `+${text2}` : `${MINUS}${text2}`;
+}
+function change(v, f) {
+  return `${signedDigits(v, f)}${unit(f)}`;
+}
+function amount(v, f) {
+  return `${digits(Math.abs(v), f)}${unit(f)}`;
+}
+function difference(v, f) {
+  return `${digits(v, f)}${unit(f)}`;
+}
+function changeInterval(ci, f) {
+  if (ci === null) return "n/a";
+  return `[${signedDigits(ci[0], f)}, ${signedDigits(ci[1], f)}]${unit(f)}`;
+}
+function valueRange(ci, f) {
+  return `${value(ci[0], f)} to ${value(ci[1], f)}`;
+}
+function unitLine(f, values) {
+  if (f.kind !== "proportion") return null;
+  return values === "values" ? "Values in percent; \u0394 and intervals in percentage points." : "Components, \u0394 and intervals in percentage points.";
+}
+function valueCell(v, f) {
+  return digits(v, f);
+}
+function changeCell(v, f) {
+  return signedDigits(v, f);
+}
+function intervalCell(ci, f) {
+  if (ci === null) return "n/a";
+  return `[${signedDigits(ci[0], f)}, ${signedDigits(ci[1], f)}]`;
+}
+var SMALLEST_P = 1e-3;
+function pCell(p) {
+  if (p === null) return "n/a";
+  return p < SMALLEST_P ? `< ${SMALLEST_P}` : p.toFixed(3);
+}
+function pText(p) {
+  if (p === null) return "p n/a";
+  return p < SMALLEST_P ? `p < ${SMALLEST_P}` : `p = ${p.toFixed(3)}`;
+}
+function count(n) {
+  return Math.round(n).toString().replace(/\B(?=(\d{3})+(?!\d))/g, ",");
+}
+function short(v) {
+  if (v === 0) return "0";
+  const abs = Math.abs(v);
+  const text2 = abs >= 1e6 || abs < 1e-4 ? v.toExponential(2) : String(Number(v.toPrecision(4)));
+  return text2.replace(/-/g, MINUS);
+}
+function fixed(v, decimals) {
+  const text2 = v.toFixed(decimals);
+  return /^-0(\.0+)?$/.test(text2) ? text2.slice(1) : text2.replace("-", MINUS);
+}
+function chartNumber(v, decimals) {
+  const text2 = v.toFixed(decimals);
+  return /^-0(\.0+)?$/.test(text2) ? text2.slice(1) : text2;
+}
+
+// src/report/words.ts
+function words(entries) {
+  return new Map(Object.entries(entries));
+}
+function say(table2, code, esc) {
+  return table2.get(code) ?? esc(String(code), 60);
+}
+var MOVEMENT_TITLE = words({
+  "better-on-both": "less bias and less variance",
+  "away-from-underfitting": "away from underfitting",
+  "toward-overfitting": "toward overfitting",
+  "away-from-overfitting": "away from overfitting",
+  "no-significant-change": "no change beyond noise",
+  "toward-underfitting": "toward underfitting",
+  "worse-on-both": "more bias and more variance"
+});
+var MOVEMENT_SENTENCE = words({
+  "better-on-both": "The change lowered both avoidable bias and variance",
+  "away-from-underfitting": "The change moved the model away from underfitting",
+  "toward-overfitting": "The change moved the model toward overfitting",
+  "away-from-overfitting": "The change moved the model away from overfitting",
+  "no-significant-change": "The change did not move avoidable bias or variance beyond run-to-run noise",
+  "toward-underfitting": "The change moved the model toward underfitting",
+  "worse-on-both": "The change raised both avoidable bias and variance"
+});
+var VALIDATION_WORD = words({
+  better: "better",
+  worse: "worse",
+  flat: "unchanged within noise"
+});
+var DIAGNOSIS_WORD = words({
+  "good-fit": "good fit",
+  "high-bias": "high bias (underfitting)",
+  "high-variance": "high variance (overfitting)",
+  "data-mismatch": "data mismatch",
+  "high-bias-and-variance": "high bias and high variance"
+});
+var COMPONENT_TITLE = words({
+  bias: "Avoidable bias",
+  variance: "Variance",
+  mismatch: "Data mismatch",
+  overfit: "Validation overfit"
+});
+var COMPONENT_WORD = words({
+  bias: "avoidable bias",
+  variance: "variance",
+  mismatch: "data mismatch",
+  overfit: "validation overfit"
+});
+var COMPONENT_ORDER = [
+  "bias",
+  "variance",
+  "mismatch",
+  "overfit"
+];
+var SPLIT_WORD = words({
+  train: "train",
+  train_dev: "train-dev",
+  validation: "validation",
+  test: "test"
+});
+var LEVER_TITLE = words({
+  "more-data": "Add training data",
+  "fewer-features": "Use fewer features",
+  "stronger-regularization": "Strengthen regularization",
+  "smaller-model": "Use a smaller model",
+  "early-stopping": "Stop training earlier",
+  "more-features": "Add features",
+  "richer-features": "Add polynomial or interaction terms",
+  "weaker-regularization": "Weaken regularization",
+  "bigger-model": "Use a bigger model",
+  "train-longer": "Train longer",
+  "align-training-data": "Make training data look like validation data",
+  "bigger-validation-set": "Use a bigger validation set",
+  "add-repeats": "Repeat each run with several seeds",
+  "supply-reference": "Supply a reference error level"
+});
+var TEST_WORD = words({
+  "welch-t": "Welch's t-test",
+  "z-binomial": "binomial z-test",
+  "mcnemar-exact": "McNemar's exact test",
+  "paired-t": "paired t-test",
+  none: "no test"
+});
+var TEST_WHY = words({
+  "welch-t": "Welch's t-test on per-repeat values: each run has two or more repeats (seeds), and their spreads may differ.",
+  "z-binomial": "normal approximation with binomial variances: one repeat of a proportion metric measured on a known number of examples.",
+  "mcnemar-exact": "McNemar's exact test: both runs scored the same examples, so only the examples on which they disagree carry information.",
+  "paired-t": "paired t-test on per-example loss differences: both runs scored the same examples with a continuous loss.",
+  none: "no test: with one repeat of a continuous metric and no paired predictions, run-to-run noise is unknown, so only min-effect decides."
+});
+var REFERENCE_SOURCE = words({
+  artifact: "from the artifact",
+  config: "from the config",
+  default: "the default for a minimized proportion",
+  unknown: "source unknown"
+});
+function reading(call, review) {
+  if (call === "flat") return "flat";
+  const up = call === "up";
+  return up === (review.metric.goal === "maximize") ? "better" : "worse";
+}
+function componentReading(call, compact) {
+  if (call === "up") return compact ? "worse" : "up (worse)";
+  if (call === "down") return compact ? "better" : "down (better)";
+  return "flat";
+}
+function levelPercent(review) {
+  return String(Number(((1 - review.settings.alpha) * 100).toPrecision(4)));
+}
+var CAUTION = "This verdict is advice for a human reviewer, not a proof: it rests on the numbers the two runs recorded and on the tests named in the method notes.";
+
+// src/report/gate.ts
+var OUTCOME_SENTENCE = /* @__PURE__ */ new Map([
+  ["worse-validation", "validation got significantly worse"],
+  ["toward-overfitting", "the change moved toward overfitting"],
+  ["toward-underfitting", "the change moved toward underfitting"],
+  ["worse-on-both", "bias and variance both got worse"],
+  ["high-bias", "the candidate has high bias"],
+  ["high-variance", "the candidate has high variance"],
+  ["data-mismatch", "the candidate shows data mismatch"],
+  [
+    "validation-overfit",
+    "the candidate overfits the validation set (test error well above validation)"
+  ]
+]);
+function reasonSentence(reason, review, esc) {
+  if (reason.outcome === "any-movement")
+    return `the model moved (${say(MOVEMENT_TITLE, review.movement, esc)})`;
+  if (reason.outcome === "slice-regression") {
+    const n = reason.slices ?? 0;
+    return `${count(n)} ${n === 1 ? "slice" : "slices"} regressed significantly`;
+  }
+  if (reason.outcome === "guardrail-regression" || reason.outcome === "guardrail-undetermined") {
+    const names2 = (reason.guardrails ?? []).map((n) => esc(n, 60)).join(", ");
+    return reason.outcome === "guardrail-regression" ? `guardrail worse beyond its margin (${names2})` : `cannot tell whether a guardrail stays within its margin (${names2})`;
+  }
+  if (reason.ratio !== void 0) return `the cost ratio is \xD7${fixed(reason.ratio, 2)}`;
+  return OUTCOME_SENTENCE.get(reason.outcome) ?? "fired";
+}
+function gateReasonLines(review, esc) {
+  return review.gate.reasons.map(
+    (reason) => `${esc(reason.outcome, 60)}: ${reasonSentence(reason, review, esc)}`
+  );
+}
+function gateSentence(review, esc) {
+  const gate = review.gate;
+  if (!gate.pass) return `${gateReasonLines(review, esc).join("; ")}.`;
+  if (gate.failOn.length === 0) return "no fail-on policy is set.";
+  return `none of fail-on (${gate.failOn.map((p) => esc(p, 60)).join(", ")}) applies.`;
+}
+
 // node_modules/markdown-table/index.js
-function defaultStringLength(value) {
-  return value.length;
+function defaultStringLength(value2) {
+  return value2.length;
 }
 function markdownTable(table2, options) {
   const settings = options || {};
@@ -49977,208 +50964,186 @@ function markdownTable(table2, options) {
   }
   return lines.join("\n");
 }
-function serialize(value) {
-  return value === null || value === void 0 ? "" : String(value);
+function serialize(value2) {
+  return value2 === null || value2 === void 0 ? "" : String(value2);
 }
-function toAlignment(value) {
-  const code = typeof value === "string" ? value.codePointAt(0) : 0;
+function toAlignment(value2) {
+  const code = typeof value2 === "string" ? value2.codePointAt(0) : 0;
   return code === 67 || code === 99 ? 99 : code === 76 || code === 108 ? 108 : code === 82 || code === 114 ? 114 : 0;
 }
 
-// src/report/escape.ts
-var DEFAULT_MAX_NAME = 80;
-var ZWJ = "\u200D";
-var REMOVED = /[\p{Cc}\p{Cf}\p{Cs}]/gu;
-var BREAKS = /[\t\n\v\f\r\u0085\u2028\u2029]/g;
-function plainText(text2, maxChars = DEFAULT_MAX_NAME) {
-  const cleaned = text2.replace(BREAKS, " ").replace(REMOVED, "").replace(/\s+/g, " ").trim();
-  return truncate(cleaned, maxChars);
+// src/report/guardrails.ts
+var COST_WORDS = /* @__PURE__ */ new Map([
+  ["trainSeconds", { noun: "training time", unit: " s" }],
+  ["inferenceMs", { noun: "inference latency", unit: " ms" }],
+  ["parameters", { noun: "parameters", unit: "" }],
+  ["memoryMb", { noun: "memory", unit: " MB" }]
+]);
+var NON_INFERIORITY_WORD = /* @__PURE__ */ new Map([
+  ["non-inferior", "within margin"],
+  ["inferior", "beyond margin"],
+  ["undetermined", "cannot tell, margin"]
+]);
+var CHANGE_WORD = /* @__PURE__ */ new Map([
+  ["better", "better"],
+  ["worse", "worse"],
+  ["flat", "no change beyond noise"],
+  ["undetermined", "noise unknown"]
+]);
+var COST_CALL_WORD = /* @__PURE__ */ new Map([
+  ["up", "up"],
+  ["down", "down"],
+  ["flat", "no change beyond noise"],
+  ["undetermined", "noise unknown"]
+]);
+var word = (table2, code, esc) => table2.get(code) ?? esc(code, 40);
+function formatOf(g) {
+  const values = [g.baseline, g.candidate].filter((v) => v !== null);
+  return formatForValues(g.kind, values);
 }
-function truncate(text2, maxChars) {
-  const points = Array.from(text2);
-  if (points.length <= maxChars) return text2;
-  return `${points.slice(0, Math.max(0, maxChars - 1)).join("").trimEnd()}\u2026`;
+function withUnit(text2, g, esc) {
+  return g.unit === null || g.kind === "proportion" ? text2 : `${text2} ${esc(g.unit, 20)}`;
 }
-function escapeInline(text2, maxChars = DEFAULT_MAX_NAME) {
-  const plain = plainText(text2, maxChars);
-  let out = "";
-  for (const ch of plain) {
-    out += escapeChar(ch);
+function guardrailVerdict(g, esc, margin) {
+  if (g.problems.includes("missing-in-baseline")) return "not in the baseline";
+  if (g.problems.includes("missing-in-candidate")) return "not in the candidate";
+  if (g.problems.includes("metric-differs")) return "metric differs between the runs";
+  const changeWord = g.change === null ? "" : word(CHANGE_WORD, g.change.call, esc);
+  if (g.nonInferiority === null) return `${changeWord}; no margin, not gated`;
+  return `${word(NON_INFERIORITY_WORD, g.nonInferiority, esc)} ${margin}`;
+}
+function ratio(v) {
+  return `\xD7${fixed(v, v >= 10 ? 1 : 2)}`;
+}
+function costCell(v, field) {
+  return `${short(v)}${COST_WORDS.get(field)?.unit ?? ""}`;
+}
+function guardrailsTable(review, esc, level, compact = false) {
+  const rows = [];
+  for (const g of review.guardrails ?? []) {
+    const f = formatOf(g);
+    const margin = g.margin === null ? "\u2014" : withUnit(amount(g.margin, f), g, esc);
+    rows.push([
+      esc(g.name, 60),
+      g.baseline === null ? "\u2014" : withUnit(value(g.baseline, f), g, esc),
+      g.candidate === null ? "\u2014" : withUnit(value(g.candidate, f), g, esc),
+      g.change === null ? "\u2014" : compact ? change(g.change.estimate, f) : `${change(g.change.estimate, f)} ${changeInterval(g.change.ci, f)}`,
+      guardrailVerdict(g, esc, margin)
+    ]);
   }
-  return out.replace(/:\/\//g, `:${ZWJ}//`).replace(/\b(www)\./gi, `$1${ZWJ}.`).replace(/\b(GH)-(?=\d)/gi, `$1-${ZWJ}`);
+  for (const [field, words2] of COST_WORDS) {
+    const c = review.cost?.[field];
+    if (c === void 0) continue;
+    const interval = c.ci === null ? "" : ` [${fixed(c.ci[0], 2)}, ${fixed(c.ci[1], 2)}]`;
+    rows.push([
+      words2.noun,
+      costCell(c.baseline, field),
+      costCell(c.candidate, field),
+      `${ratio(c.ratio)}${interval}`,
+      word(COST_CALL_WORD, c.call, esc)
+    ]);
+  }
+  if (rows.length === 0) return null;
+  return {
+    header: [
+      compact ? "Guardrail" : "Guardrail or cost",
+      "Baseline",
+      "Candidate",
+      compact ? "\u0394" : `\u0394 [${level}% interval]`,
+      "Verdict"
+    ],
+    align: ["l", "r", "r", "r", "l"],
+    rows,
+    units: null
+  };
 }
-function escapeChar(ch) {
-  switch (ch) {
-    case "&":
-      return "&amp;";
-    case "<":
-      return "&lt;";
-    case ">":
-      return "&gt;";
-    case "@":
-      return `@${ZWJ}`;
-    case "#":
-      return `\\#${ZWJ}`;
+function tradeOffPhrase(review, esc) {
+  const moved = [...COST_WORDS].filter(([field]) => {
+    const call = review.cost?.[field]?.call;
+    return call === "up" || call === "down";
+  });
+  if (moved.length === 0) return null;
+  const f = numberFormatFor(review);
+  const costs = moved.map(([field, words2]) => `${ratio(review.cost?.[field]?.ratio ?? 1)} ${words2.noun}`).join(" and ");
+  return `${change(review.validation.delta.estimate, f)} ${esc(review.metric.name, 60)} for ${costs}`;
+}
+function guardrailNames(review, call) {
+  return (review.guardrails ?? []).filter((g) => g.nonInferiority === call).map((g) => g.name);
+}
+
+// src/report/levers.ts
+function leverText(lever, review, f, esc) {
+  const ctx = { review, f, esc };
+  const sentences = lever.evidence.flatMap((e) => evidenceSentence(e, lever.id, ctx) ?? []);
+  if (lever.suggestion !== void 0) sentences.push(suggestionSentence(lever.suggestion, ctx));
+  return { title: say(LEVER_TITLE, lever.id, esc), sentences };
+}
+function fromTo(e) {
+  return `${short(e.from)} \u2192 ${short(e.to)}`;
+}
+function evidenceSentence(e, id, ctx) {
+  const { f, esc, review } = ctx;
+  const metric = esc(review.metric.name, 60);
+  switch (e.kind) {
+    case "diagnosis":
+      if (e.component === "mismatch")
+        return `Validation error exceeds train-dev error by ${amount(e.value, f)}: the training data does not look like the validation data; collect or synthesise training data that resembles it.`;
+      if (e.component === "overfit")
+        return `Test error exceeds validation error by ${amount(e.value, f)}: model choices may be tuned to the validation set; enlarge or refresh it.`;
+      return `The candidate has high ${say(COMPONENT_WORD, e.component, esc)}: ${amount(e.value, f)} against a validation error of ${value(e.errorLevel, f)}.`;
+    case "pr-change":
+      return `This PR ${e.direction === "raised" ? "raised" : "lowered"} ${esc(e.hyperparameter, 60)} ${fromTo(e)}.`;
+    case "component-change": {
+      const word2 = e.delta.call === "up" ? "rose" : e.delta.call === "down" ? "fell" : "held steady";
+      const toward = e.delta.call !== "up" ? "" : e.component === "bias" ? ": the model moved toward underfitting" : ": the model moved toward overfitting";
+      return `${say(COMPONENT_TITLE, e.component, esc)} ${word2} (${change(e.delta.estimate, f)}, ${pText(e.delta.p)})${toward}.`;
+    }
+    case "already-pulled":
+      return `This PR already ${e.direction === "raised" ? "raised" : "lowered"} ${esc(e.hyperparameter, 60)} (${fromTo(e)}): judge its effect before pulling further.`;
+    case "sweep-minimum":
+      return sweepSentence(e, ctx);
+    case "learning-curve": {
+      const times = e.fromX > 0 ? ` (${short(e.atX / e.fromX)}\xD7 the largest on the curve)` : "";
+      return `At ${count(e.atX)} training examples${times} the power-law fit (R\xB2 ${fixed(e.r2, 2)}) projects validation ${metric} ${value(e.current, f)} \u2192 ${value(e.projected, f)} (${valueRange(e.ci, f)}).`;
+    }
+    case "gap-trend":
+      return e.trend === "flat" ? "The train/validation gap is flat at the right end of the learning curve: more data will help little." : "The train/validation gap is still closing at the right end of the learning curve.";
+    case "epoch-minimum":
+      return `Validation was best at epoch ${short(e.epoch)} of ${short(e.of)}; stopping there saves ${amount(e.saves, f)}${e.gl === null ? "" : ` (generalization loss ${fixed(e.gl, 1)}%)`}.`;
+    case "still-improving":
+      return `Train and validation ${metric} were both still improving at epoch ${short(e.epoch)}.`;
+    case "epoch-curve-silent":
+      if (!e.curve) return "No epoch curve to confirm it.";
+      return id === "train-longer" ? "The epoch curve does not show both errors still falling at the end." : "The epoch curve does not show training past the validation minimum.";
+    case "reference-missing":
+      return "Bias is unknown without a reference level: add `reference` (human-level error, a prior system, or an estimated Bayes error) to the artifacts or the config.";
+    case "noise-unknown":
+      return "Run-to-run noise is unknown: train with 2 or more seeds (or ship per-example predictions) so changes can be tested.";
     default:
-      return MARKDOWN_PUNCTUATION.has(ch) ? `\\${ch}` : ch;
+      return null;
   }
 }
-var MARKDOWN_PUNCTUATION = /* @__PURE__ */ new Set(["\\", "`", "*", "_", "[", "]", "|", "~", "$"]);
-function mermaidLabel(text2, maxChars = 60) {
-  const kept = plainText(text2, Number.MAX_SAFE_INTEGER).replace(/[^\p{L}\p{N} .,\-+()/=]/gu, " ").replace(/ {2,}/g, " ").trim();
-  return truncate(kept, maxChars);
+function sweepSentence(e, ctx) {
+  const { f, esc } = ctx;
+  const name = e.hyperparameter === null ? "\u03BB" : esc(e.hyperparameter, 60);
+  const at = `${name} \u2248 ${short(e.bestX)}`;
+  const uses = e.current === null ? "" : `; the candidate uses ${short(e.current)}`;
+  const edge = e.atEdge === null ? "" : ` The minimum is at the ${e.atEdge === "low" ? "low" : "high"} end of the sweep: extend it.`;
+  if (e.supports === true)
+    return `The regularization sweep has its lowest validation (${value(e.bestValidation, f)}) at ${at}${uses}.${edge}`;
+  if (e.supports === false && e.side === "at")
+    return `The candidate's strength is already at the sweep's validation minimum (${at}).${edge}`;
+  if (e.supports === false)
+    return `The sweep's validation minimum (${at}) lies on the other side of the candidate's strength.${edge}`;
+  return `The regularization sweep has its lowest validation (${value(e.bestValidation, f)}) at ${at}.${edge}`;
 }
-function displayValue(value) {
-  if (value === void 0) return "(absent)";
-  if (typeof value === "string") return value;
-  if (typeof value === "number" || typeof value === "boolean" || value === null) {
-    return String(value);
-  }
-  try {
-    return JSON.stringify(value) ?? String(value);
-  } catch {
-    return String(value);
-  }
+function suggestionSentence(s, ctx) {
+  const basis = s.basis === "between-old-and-new" ? ", between the old and new values" : s.basis === "sweep-minimum" ? ", the sweep's minimum" : ", one grid step beyond the end of the sweep";
+  return `Try ${ctx.esc(s.hyperparameter, 60)} \u2248 ${short(s.value)}${basis}.`;
 }
-
-// src/report/format.ts
-function numberFormatFor(review) {
-  let largest = 0;
-  for (const change of review.splits) {
-    largest = Math.max(largest, Math.abs(change.baseline), Math.abs(change.candidate));
-  }
-  if (largest === 0 || !Number.isFinite(largest)) return { decimals: 4 };
-  const decimals = 3 - Math.floor(Math.log10(largest));
-  return { decimals: Math.min(6, Math.max(0, decimals)) };
-}
-function num(value, format) {
-  const text2 = value.toFixed(format.decimals);
-  return /^-0(\.0+)?$/.test(text2) ? text2.slice(1) : text2;
-}
-function signed(value, format) {
-  const text2 = num(Math.abs(value), format);
-  if (/^0(\.0+)?$/.test(text2)) return text2;
-  return value > 0 ? `+${text2}` : `\u2212${text2}`;
-}
-function interval(ci, format) {
-  if (ci === null) return "n/a";
-  return `[${signed(ci[0], format)}, ${signed(ci[1], format)}]`;
-}
-function pValue(p) {
-  if (p === null) return "p n/a";
-  if (p < 1e-3) return "p < 0.001";
-  return `p = ${p.toFixed(3)}`;
-}
-function count(n) {
-  return Math.round(n).toString().replace(/\B(?=(\d{3})+(?!\d))/g, ",");
-}
-function short(value) {
-  if (value === 0) return "0";
-  const abs = Math.abs(value);
-  if (abs >= 1e6 || abs < 1e-4) return value.toExponential(2);
-  return String(Number(value.toPrecision(4)));
-}
-function chartNumber(value, decimals) {
-  const text2 = value.toFixed(decimals);
-  return /^-0(\.0+)?$/.test(text2) ? text2.slice(1) : text2;
-}
-
-// src/report/words.ts
-var MOVEMENT_TITLE = {
-  "better-on-both": "less bias and less variance",
-  "away-from-underfitting": "away from underfitting",
-  "toward-overfitting": "toward overfitting",
-  "away-from-overfitting": "away from overfitting",
-  "no-significant-change": "no change beyond noise",
-  "toward-underfitting": "toward underfitting",
-  "worse-on-both": "more bias and more variance"
-};
-var MOVEMENT_SENTENCE = {
-  "better-on-both": "The change lowered both avoidable bias and variance",
-  "away-from-underfitting": "The change moved the model away from underfitting",
-  "toward-overfitting": "The change moved the model toward overfitting",
-  "away-from-overfitting": "The change moved the model away from overfitting",
-  "no-significant-change": "The change did not move avoidable bias or variance beyond run-to-run noise",
-  "toward-underfitting": "The change moved the model toward underfitting",
-  "worse-on-both": "The change raised both avoidable bias and variance"
-};
-var VALIDATION_WORD = {
-  better: "better",
-  worse: "worse",
-  flat: "unchanged within noise"
-};
-var DIAGNOSIS_WORD = {
-  "good-fit": "good fit",
-  "high-bias": "high bias (underfitting)",
-  "high-variance": "high variance (overfitting)",
-  "data-mismatch": "data mismatch",
-  "high-bias-and-variance": "high bias and high variance"
-};
-var COMPONENT_WORD = {
-  bias: "Avoidable bias",
-  variance: "Variance",
-  mismatch: "Data mismatch",
-  overfit: "Validation overfit"
-};
-var COMPONENT_ORDER = [
-  "bias",
-  "variance",
-  "mismatch",
-  "overfit"
-];
-var SPLIT_WORD = {
-  train: "train",
-  train_dev: "train-dev",
-  validation: "validation",
-  test: "test"
-};
-var LEVER_TITLE = {
-  "more-data": "Add training data",
-  "fewer-features": "Use fewer features",
-  "stronger-regularization": "Strengthen regularization",
-  "smaller-model": "Use a smaller model",
-  "early-stopping": "Stop training earlier",
-  "more-features": "Add features",
-  "richer-features": "Add polynomial or interaction terms",
-  "weaker-regularization": "Weaken regularization",
-  "bigger-model": "Use a bigger model",
-  "train-longer": "Train longer",
-  "align-training-data": "Make training data look like validation data",
-  "bigger-validation-set": "Use a bigger validation set",
-  "add-repeats": "Repeat each run with several seeds",
-  "supply-reference": "Supply a reference error level"
-};
-var TEST_WORD = {
-  "welch-t": "Welch's t-test",
-  "z-binomial": "binomial z-test",
-  "mcnemar-exact": "McNemar's exact test",
-  "paired-t": "paired t-test",
-  none: "no test"
-};
-var TEST_WHY = {
-  "welch-t": "Welch's t-test on per-repeat values: each run has two or more repeats (seeds), and their spreads may differ.",
-  "z-binomial": "normal approximation with binomial variances: one repeat of a proportion metric measured on a known number of examples.",
-  "mcnemar-exact": "McNemar's exact test: both runs scored the same examples, so only the examples on which they disagree carry information.",
-  "paired-t": "paired t-test on per-example loss differences: both runs scored the same examples with a continuous loss.",
-  none: "no test: with one repeat of a continuous metric and no paired predictions, run-to-run noise is unknown, so only min-effect decides."
-};
-function reading(call, review) {
-  if (call === "flat") return "flat";
-  const up = call === "up";
-  return up === (review.metric.goal === "maximize") ? "better" : "worse";
-}
-function componentReading(call) {
-  if (call === "up") return "up (worse)";
-  if (call === "down") return "down (better)";
-  return "flat";
-}
-function levelPercent(review) {
-  return String(Number(((1 - review.settings.alpha) * 100).toPrecision(4)));
-}
-var CAUTION = "This verdict is advice for a human reviewer, not a proof: it rests on the numbers the two runs recorded and on the tests named in the method notes.";
 
 // src/report/tables.ts
-function splitsTable(review) {
+function splitsTable(review, esc) {
   const f = numberFormatFor(review);
   return {
     header: [
@@ -50191,23 +51156,24 @@ function splitsTable(review) {
       "Reading"
     ],
     align: ["l", "r", "r", "r", "r", "r", "l"],
+    units: unitLine(f, "values"),
     rows: review.splits.map((s) => [
-      SPLIT_WORD[s.split],
-      num(s.baseline, f),
-      num(s.candidate, f),
-      signed(s.delta.estimate, f),
-      interval(s.delta.ci, f),
-      pValue(s.delta.p).replace(/^p /, "").replace(/^= /, ""),
+      say(SPLIT_WORD, s.split, esc),
+      valueCell(s.baseline, f),
+      valueCell(s.candidate, f),
+      changeCell(s.delta.estimate, f),
+      intervalCell(s.delta.ci, f),
+      pCell(s.delta.p),
       reading(s.delta.call, review)
     ])
   };
 }
-function decompositionTable(review, compact = false) {
+function decompositionTable(review, esc, compact = false) {
   const f = numberFormatFor(review);
   const cell = (run, name) => {
     const c = review[run].components[name];
     if (c.value === null) return "n/a";
-    return `${num(c.value, f)}${c.present ? compact ? "*" : " (present)" : ""}`;
+    return `${valueCell(c.value, f)}${c.present ? compact ? "*" : " (present)" : ""}`;
   };
   const deltas = {
     bias: review.bias.delta,
@@ -50217,71 +51183,46 @@ function decompositionTable(review, compact = false) {
   };
   const rows = COMPONENT_ORDER.map((name) => {
     const d = deltas[name];
+    const row = [say(COMPONENT_TITLE, name, esc), cell("baseline", name), cell("candidate", name)];
+    if (d === null) return [...row, "n/a", "n/a", ...compact ? [] : ["n/a"], "n/a"];
     return [
-      COMPONENT_WORD[name],
-      cell("baseline", name),
-      cell("candidate", name),
-      d === null ? "n/a" : signed(d.estimate, f),
-      d === null ? "n/a" : interval(d.ci, f),
-      d === null ? "n/a" : pValue(d.p).replace(/^p /, "").replace(/^= /, ""),
-      d === null ? "n/a" : componentReading(d.call)
+      ...row,
+      changeCell(d.estimate, f),
+      intervalCell(d.ci, f),
+      ...compact ? [] : [pCell(d.p)],
+      componentReading(d.call, compact)
     ];
   });
+  const units = unitLine(f, "differences");
+  const header = ["Component", "Baseline", "Candidate", "\u0394", `${levelPercent(review)}% interval`];
+  if (compact) {
+    return { header: [...header, "Call"], align: ["l", "r", "r", "r", "r", "l"], rows, units };
+  }
   rows.push([
     "Diagnosis",
-    DIAGNOSIS_WORD[review.baseline.diagnosis],
-    DIAGNOSIS_WORD[review.candidate.diagnosis],
+    say(DIAGNOSIS_WORD, review.baseline.diagnosis, esc),
+    say(DIAGNOSIS_WORD, review.candidate.diagnosis, esc),
     "",
     "",
     "",
     ""
   ]);
-  const table2 = {
-    header: [
-      "Component",
-      "Baseline",
-      "Candidate",
-      "\u0394",
-      `${levelPercent(review)}% interval`,
-      "p",
-      "Call"
-    ],
-    align: ["l", "r", "r", "r", "r", "r", "l"],
-    rows
-  };
-  if (!compact) return table2;
-  const shorter = (row) => [
-    ...row.slice(0, 5),
-    (row[6] ?? "").replace(/^(up|down) \((\w+)\)$/, "$2")
-  ];
   return {
-    header: shorter(table2.header),
-    align: ["l", "r", "r", "r", "r", "l"],
-    rows: table2.rows.map(shorter)
+    header: [...header, "p", "Call"],
+    align: ["l", "r", "r", "r", "r", "r", "l"],
+    rows,
+    units
   };
-}
-function unavailableNotes(review, esc) {
-  const seen = /* @__PURE__ */ new Set();
-  for (const run of ["baseline", "candidate"]) {
-    for (const name of COMPONENT_ORDER) {
-      const c = review[run].components[name];
-      if (c.value === null && c.unavailable !== void 0) {
-        seen.add(`${COMPONENT_WORD[name]}: ${esc(c.unavailable, 300)}`);
-      }
-    }
-  }
-  return [...seen];
 }
 function leversTable(review, esc) {
+  const f = numberFormatFor(review);
   return {
-    header: ["#", "Lever", "Why", "Evidence"],
-    align: ["r", "l", "l", "l"],
-    rows: review.levers.map((lever, i2) => [
-      String(i2 + 1),
-      LEVER_TITLE[lever.id],
-      esc(lever.reason, 300),
-      lever.evidence.map((e) => esc(e, 200)).join(" \xB7 ") || "\u2014"
-    ])
+    header: ["#", "Lever", "Why"],
+    align: ["r", "l", "l"],
+    rows: review.levers.map((lever, i2) => {
+      const text2 = leverText(lever, review, f, esc);
+      return [String(i2 + 1), text2.title, text2.sentences.join(" ") || "\u2014"];
+    })
   };
 }
 function sliceHarm(slice, review) {
@@ -50293,29 +51234,46 @@ function sortSlices(review) {
     (a, b) => rank(a) - rank(b) || sliceHarm(b, review) - sliceHarm(a, review) || (a.name < b.name ? -1 : a.name > b.name ? 1 : 0)
   );
 }
+var SLICE_CHANGE = /* @__PURE__ */ new Map([
+  ["worse", "worse"],
+  ["better", "better"],
+  ["flat", "flat"]
+]);
 function slicesTable(review, esc, limit) {
   const f = numberFormatFor(review);
   const rows = sortSlices(review).slice(0, limit).map((s) => [
     esc(s.name),
     s.examples === null ? "n/a" : count(s.examples),
-    num(s.baseline, f),
-    num(s.candidate, f),
-    signed(s.delta.estimate, f),
-    s.pAdjusted === null ? "n/a" : pValue(s.pAdjusted).replace(/^p /, "").replace(/^= /, ""),
-    s.hiddenRegression ? "worse (hidden)" : s.change
+    valueCell(s.baseline, f),
+    valueCell(s.candidate, f),
+    changeCell(s.delta.estimate, f),
+    pCell(s.pAdjusted),
+    s.hiddenRegression ? "worse (hidden)" : SLICE_CHANGE.get(s.change) ?? esc(s.change, 20)
   ]);
   return {
     header: ["Slice", "Examples", "Baseline", "Candidate", "\u0394", "p (Holm)", "Change"],
     align: ["l", "r", "r", "r", "r", "r", "l"],
-    rows
+    rows,
+    units: unitLine(f, "values")
   };
 }
-function sliceCounts(slices) {
+function sliceCounts(slices2) {
   const out = { worse: 0, better: 0, flat: 0 };
-  for (const s of slices) out[s.change] += 1;
+  for (const s of slices2) {
+    if (s.change === "worse") out.worse += 1;
+    else if (s.change === "better") out.better += 1;
+    else out.flat += 1;
+  }
   return out;
 }
 var MAX_HYPERPARAMETER_ROWS = 50;
+var HYPERPARAMETER_CHANGE = /* @__PURE__ */ new Map([
+  ["raised", "raised"],
+  ["lowered", "lowered"],
+  ["changed", "changed"],
+  ["added", "added"],
+  ["removed", "removed"]
+]);
 function hyperparameterTable(review, esc) {
   return {
     header: ["Hyperparameter", "Baseline", "Candidate", "Change"],
@@ -50324,71 +51282,99 @@ function hyperparameterTable(review, esc) {
       esc(h.key),
       h.kind === "added" ? "(absent)" : esc(displayValue(h.baseline), 60),
       h.kind === "removed" ? "(absent)" : esc(displayValue(h.candidate), 60),
-      h.kind
+      HYPERPARAMETER_CHANGE.get(h.kind) ?? esc(h.kind, 20)
     ])
   };
 }
 
 // src/report/headline.ts
-function changePhrase(name, delta, review) {
-  const f = numberFormatFor(review);
+function changePhrase(name, delta, review, f) {
   if (delta === null) return `${name} unknown`;
-  const level = levelPercent(review);
-  const stats = delta.ci === null ? `${signed(delta.estimate, f)}, noise unknown` : `${signed(delta.estimate, f)}, ${level}% interval ${interval(delta.ci, f)}, ${pValue(delta.p)}`;
-  const word = delta.call === "up" ? "rose" : delta.call === "down" ? "fell" : "held steady";
-  return `${name} ${word} (${stats})`;
+  const stats = delta.ci === null ? `${change(delta.estimate, f)}, noise unknown` : `${change(delta.estimate, f)}, ${levelPercent(review)}% interval ${changeInterval(delta.ci, f)}, ${pText(delta.p)}`;
+  const word2 = delta.call === "up" ? "rose" : delta.call === "down" ? "fell" : "held steady";
+  return `${name} ${word2} (${stats})`;
+}
+var GOOD_MOVEMENTS = /* @__PURE__ */ new Set([
+  "better-on-both",
+  "away-from-overfitting",
+  "away-from-underfitting"
+]);
+function guardrailLines(review, esc) {
+  const lines = [];
+  const tradeOff = tradeOffPhrase(review, esc);
+  if (tradeOff !== null) lines.push({ label: "Trade-off", text: `${tradeOff}.`, tone: "neutral" });
+  const inferior = guardrailNames(review, "inferior");
+  if (inferior.length > 0) {
+    lines.push({
+      label: `${inferior.length === 1 ? "Guardrail" : "Guardrails"} regressed beyond the margin`,
+      text: `${inferior.map((n) => esc(n, 60)).join(", ")}.`,
+      tone: "bad"
+    });
+  }
+  return lines;
 }
 function buildHeadline(review, esc) {
   const f = numberFormatFor(review);
   const metric = esc(review.metric.name, 60);
   const v = review.validation;
-  const vBase = review.splits.find((s) => s.split === "validation");
-  const movementTone = review.movement === "better-on-both" || review.movement === "away-from-overfitting" || review.movement === "away-from-underfitting" ? "good" : review.movement === "no-significant-change" ? "neutral" : "bad";
+  const vSplit = review.splits.find((s) => s.split === "validation");
+  const movementTone = GOOD_MOVEMENTS.has(review.movement) ? "good" : review.movement === "no-significant-change" ? "neutral" : "bad";
   const vTone = v.change === "better" ? "good" : v.change === "worse" ? "bad" : "neutral";
-  const level = levelPercent(review);
-  const vStats = v.delta.ci === null ? `\u0394 ${signed(v.delta.estimate, f)}; run-to-run noise unknown` : `\u0394 ${signed(v.delta.estimate, f)}, ${level}% interval ${interval(v.delta.ci, f)}, ${pValue(v.delta.p)}, ${TEST_WORD[v.delta.test]}`;
-  const from = vBase === void 0 ? "" : `${num(vBase.baseline, f)} \u2192 ${num(vBase.candidate, f)} `;
+  const vStats = v.delta.ci === null ? `${change(v.delta.estimate, f)}; run-to-run noise unknown` : `${change(v.delta.estimate, f)}, ${levelPercent(review)}% interval ${changeInterval(v.delta.ci, f)}, ${pText(v.delta.p)}, ${say(TEST_WORD, v.delta.test, esc)}`;
+  const from = vSplit === void 0 ? "" : `${value(vSplit.baseline, f)} \u2192 ${value(vSplit.candidate, f)} `;
   const lines = [
     {
-      label: MOVEMENT_SENTENCE[review.movement],
-      text: `${changePhrase(
-        "avoidable bias",
-        review.bias.delta,
-        review
-      )}; ${changePhrase("variance", review.variance.delta, review)}. Diagnosis: baseline ${DIAGNOSIS_WORD[review.baseline.diagnosis]}, candidate ${DIAGNOSIS_WORD[review.candidate.diagnosis]}.`,
+      label: say(MOVEMENT_SENTENCE, review.movement, esc),
+      text: `${changePhrase("avoidable bias", review.bias.delta, review, f)}; ${changePhrase(
+        "variance",
+        review.variance.delta,
+        review,
+        f
+      )}. Diagnosis: baseline ${say(DIAGNOSIS_WORD, review.baseline.diagnosis, esc)}, candidate ${say(
+        DIAGNOSIS_WORD,
+        review.candidate.diagnosis,
+        esc
+      )}.`,
       tone: movementTone
     },
     {
-      label: `Validation ${metric} ${VALIDATION_WORD[v.change]}`,
-      text: `${from}(${vStats}).`,
+      label: `Validation ${metric} ${say(VALIDATION_WORD, v.change, esc)}`,
+      text: `${from}(\u0394 ${vStats}).`,
       tone: vTone
+    },
+    ...guardrailLines(review, esc),
+    {
+      label: review.gate.pass ? "Gate passed" : "Gate failed",
+      text: gateSentence(review, esc),
+      tone: review.gate.pass ? "good" : "bad"
     }
   ];
-  const gate = review.gate;
-  lines.push({
-    label: gate.pass ? "Gate passed" : "Gate failed",
-    text: gate.pass ? gate.failOn.length === 0 ? "no fail-on policy is set." : `none of fail-on (${gate.failOn.map((p) => esc(p, 60)).join(", ")}) applies.` : `${gate.reasons.map((r) => esc(r, 200)).join("; ")}.`,
-    tone: gate.pass ? "good" : "bad"
-  });
   const first = review.levers[0];
-  lines.push(
-    first === void 0 ? { label: "Next lever", text: "none suggested.", tone: "neutral" } : {
-      label: `Next lever: ${LEVER_TITLE[first.id]}`,
-      text: esc(first.reason, 300),
+  if (first === void 0)
+    lines.push({ label: "Next lever", text: "none suggested.", tone: "neutral" });
+  else {
+    const text2 = leverText(first, review, f, esc);
+    lines.push({
+      label: `Next lever: ${text2.title}`,
+      text: text2.sentences.join(" ") || "\u2014",
       tone: "neutral"
-    }
-  );
+    });
+  }
   const hidden = sortSlices(review).filter((s) => s.hiddenRegression);
   const worst = hidden[0];
   if (worst !== void 0) {
     lines.push({
       label: `${hidden.length} ${hidden.length === 1 ? "slice" : "slices"} got worse while validation improved`,
-      text: `worst: ${esc(worst.name, 60)} (${signed(worst.delta.estimate, f)}).`,
+      text: `worst: ${esc(worst.name, 60)} (${value(worst.baseline, f)} \u2192 ${value(worst.candidate, f)}, ${change(worst.delta.estimate, f)}).`,
       tone: "bad"
     });
   }
-  const title = `${MOVEMENT_TITLE[review.movement]} \xB7 validation ${VALIDATION_WORD[v.change]} \xB7 gate ${gate.pass ? "passed" : "failed"}`;
-  return { title, tone: gate.pass ? movementTone : "bad", lines };
+  const title = `${say(MOVEMENT_TITLE, review.movement, esc)} \xB7 validation ${say(
+    VALIDATION_WORD,
+    v.change,
+    esc
+  )} \xB7 gate ${review.gate.pass ? "passed" : "failed"}`;
+  return { title, tone: review.gate.pass ? movementTone : "bad", lines };
 }
 
 // src/report/marker.ts
@@ -50456,8 +51442,8 @@ function planeChart(review) {
     ...points.map(([run, b, v]) => `  "${run}": [${axis(b)}, ${axis(v)}]`)
   ];
   const metric = escapeInline(review.metric.name, 40);
-  const values = points.map(([run, b, v]) => `${run} bias ${num(b, format)}, variance ${num(v, format)}`).join("; ");
-  const caption = `**Bias/variance plane** (${metric}, shortfall units). Each axis is scaled so that its middle line is the presence threshold, ${num(t, format)} (gap tolerance ${short(review.settings.gapTolerance)} \xD7 the mean validation error level); right of it avoidable bias is large enough to count, above it variance. Values: ${values}.`;
+  const values = points.map(([run, b, v]) => `${run} bias ${difference(b, format)}, variance ${difference(v, format)}`).join("; ");
+  const caption = `**Bias/variance plane** (${metric}, shortfall units). Each axis is scaled so that its middle line is the presence threshold, ${difference(t, format)} (gap tolerance ${short(review.settings.gapTolerance)} \xD7 the mean validation error level); right of it avoidable bias is large enough to count, above it variance. Values: ${values}.`;
   return { kind: "plane", caption, code: lines.join("\n") };
 }
 var CURVE_TEXT = {
@@ -50530,7 +51516,7 @@ function curveCharts(review, curve) {
     return [lineChart(review, curve, series, [range[0], range[1]], yRange, run)];
   });
 }
-function lineChart(review, curve, series, [lo, hi], [yMin, yMax], only) {
+function lineChart(review, curve, series, [lo, hi], yRange, only) {
   const text2 = CURVE_TEXT[curve];
   const ordered = orderSeries(series);
   const xs = [
@@ -50538,13 +51524,16 @@ function lineChart(review, curve, series, [lo, hi], [yMin, yMax], only) {
   ].sort((a, b) => a - b);
   const geometric = curve !== "epochs" && lo > 0 && hi / lo >= 10;
   const grid = geometric ? thin(xs, MAX_POINTS) : evenGrid(lo, hi, Math.min(MAX_POINTS, xs.length));
+  const percent = review.metric.kind === "proportion";
+  const yScale = percent ? 100 : 1;
+  const [yMin, yMax] = [yRange[0] * yScale, yRange[1] * yScale];
   const yPad = (yMax - yMin) * 0.05 || Math.abs(yMax) * 0.05 || 1;
   const y0 = yMin - yPad;
   const y1 = yMax + yPad;
   const yDecimals = Math.min(6, Math.max(0, 2 - Math.floor(Math.log10(y1 - y0))));
   const xDecimals = Number.isInteger(lo) && Number.isInteger(hi) ? 0 : Math.min(6, Math.max(0, 2 - Math.floor(Math.log10(Math.max(hi - lo, 1e-9)))));
   const metric = mermaidLabel(review.metric.name, 40) || "metric";
-  const unit = review.metric.kind === "proportion" ? "proportion" : "metric units";
+  const unit2 = percent ? "%" : "metric units";
   const title = only === null ? text2.title : `${text2.title}, ${only}`;
   const palette = ordered.map((s) => PALETTE[paletteKey(s)][0]).join(", ");
   const lines = [
@@ -50552,9 +51541,9 @@ function lineChart(review, curve, series, [lo, hi], [yMin, yMax], only) {
     "xychart-beta",
     `  title "${title}"`,
     geometric ? `  x-axis "${text2.x}" [${grid.map((x2) => `"${short(x2)}"`).join(", ")}]` : `  x-axis "${text2.x}" ${chartNumber(lo, xDecimals)} --> ${chartNumber(hi, xDecimals)}`,
-    `  y-axis "${metric} (${unit})" ${chartNumber(y0, yDecimals)} --> ${chartNumber(y1, yDecimals)}`,
+    `  y-axis "${metric} (${unit2})" ${chartNumber(y0, yDecimals)} --> ${chartNumber(y1, yDecimals)}`,
     ...ordered.map(
-      (s) => `  line [${grid.map((x2) => chartNumber(interpolate(s.points, x2, geometric), yDecimals + 1)).join(", ")}]`
+      (s) => `  line [${grid.map((x2) => chartNumber(yScale * interpolate(s.points, x2, geometric), yDecimals + 1)).join(", ")}]`
     )
   ];
   const legend = ordered.map((s) => `${PALETTE[paletteKey(s)][1]} = ${s.run} ${s.part}`).join(", ");
@@ -50605,11 +51594,89 @@ function interpolate(points, x2, logX) {
 }
 
 // src/report/notes.ts
+function names(list, total, esc) {
+  return `${list.map((n) => esc(n, 60)).join(", ")}${total > list.length ? ", \u2026" : ""}`;
+}
+function slices(n) {
+  return `${count(n)} ${n === 1 ? "slice" : "slices"}`;
+}
+function noteSentence(note, review, f, esc) {
+  switch (note.code) {
+    case "train-dev-in-one-run":
+      return "Only one run has a train-dev split: the variance change is measured as validation \u2212 train in both.";
+    case "unpaired-slices":
+      return `${slices(note.count)} appear in one run only and were not compared: ${names(note.names, note.count, esc)}.`;
+    case "hidden-regressions":
+      return `Validation improved overall, yet ${slices(note.count)} regressed significantly (Holm-adjusted): ${names(note.names, note.count, esc)}.`;
+    case "noise-unknown":
+      return review.settings.minEffect > 0 ? `Run-to-run noise is unknown (one repeat of a continuous metric, no per-example predictions): changes are called on size alone (min-effect ${amount(review.settings.minEffect, f)}).` : "Run-to-run noise is unknown (one repeat of a continuous metric, no per-example predictions) and min-effect is 0: no change can be called. Add repeats (seeds), per-example predictions, or set min-effect.";
+    case "bias-unknown":
+      return "Avoidable bias is unknown: there is no reference level for this metric. Its change is still measured from the training error; the diagnosis rests on variance and data mismatch.";
+    case "predictions-share-no-id":
+      return "The two predictions files share no id: the paired test was not used.";
+    case "predictions-in-one-run":
+      return "Only one run ships per-example predictions: no paired test.";
+    case "predictions-split-mismatch":
+      return `The predictions are for different splits (${say(SPLIT_WORD, note.baseline, esc)} in the baseline, ${say(SPLIT_WORD, note.candidate, esc)} in the candidate): no paired test.`;
+    case "predictions-unmatched":
+      return `Predictions paired by id: ${count(note.rows)} rows in both; ${count(note.baseline)} baseline and ${count(note.candidate)} candidate rows had no partner and were left out of the paired test.`;
+    case "epoch-log-not-used":
+      return `${esc(note.file, 120)}: the artifact has its own epoch curve; the epoch log ${esc(note.log, 120)} was not used.`;
+    case "epoch-log-missing":
+      return `No epoch log ${esc(note.log, 120)} next to ${esc(note.file, 120)}; the config's epoch-log mapping was not applied to it.`;
+    default:
+      return esc(String(note.code), 60);
+  }
+}
+var NON_LEVER = /* @__PURE__ */ new Map([
+  [
+    "smaller-training-set",
+    "A smaller training set is not a cure for high bias: it only lowers the training error, while validation error stays high or rises."
+  ]
+]);
+var WARNING = /* @__PURE__ */ new Map([
+  [
+    "validation-overfit",
+    "test error is well above validation error: model choices may be tuned to the validation set."
+  ]
+]);
+function reviewNotes2(review, f, esc) {
+  return [
+    ...["baseline", "candidate"].flatMap(
+      (run) => review[run].warnings.map((w) => `${run}: ${say(WARNING, w, esc)}`)
+    ),
+    ...review.notes.map((n) => noteSentence(n, review, f, esc)),
+    ...review.nonLevers.map((n) => say(NON_LEVER, n, esc))
+  ];
+}
+var UNAVAILABLE2 = /* @__PURE__ */ new Map([
+  [
+    "no-reference",
+    "no reference level: give `reference` in the artifact or the config (human-level error, a prior system, or an estimated Bayes error)."
+  ],
+  ["no-train-dev", "needs a train-dev split (held-out data from the training distribution)."],
+  ["no-test", "needs a test split."]
+]);
+function unavailableNotes(review, esc) {
+  const seen = /* @__PURE__ */ new Set();
+  for (const run of ["baseline", "candidate"]) {
+    for (const name of COMPONENT_ORDER) {
+      const c = review[run].components[name];
+      if (c.value === null && c.unavailable !== void 0) {
+        seen.add(`${say(COMPONENT_TITLE, name, esc)}: ${say(UNAVAILABLE2, c.unavailable, esc)}`);
+      }
+    }
+  }
+  return [...seen];
+}
+
+// src/report/method.ts
 function methodNotes(review, esc) {
+  const f = numberFormatFor(review);
   const s = review.settings;
   const lines = [
     `alpha = ${short(s.alpha)}: a change counts as up or down only when it is significant at this level and at least min-effect in size; intervals are ${levelPercent(review)}%.`,
-    `min-effect = ${short(s.minEffect)} (${review.metric.kind === "proportion" ? "proportion" : "metric units"}): smaller changes are called flat however significant.`,
+    `min-effect = ${amount(s.minEffect, f)}: smaller changes are called flat however significant.`,
     `gap tolerance = ${short(s.gapTolerance)}: a component is present when it is at least this share of the run's validation error level (and at least min-effect, and significantly above 0 where its noise is known).`,
     `fail-on = ${s.failOn.length === 0 ? "(empty: the gate always passes)" : s.failOn.map((p) => esc(p, 60)).join(", ")}.`
   ];
@@ -50623,13 +51690,20 @@ function methodNotes(review, esc) {
   use("variance", review.variance.delta);
   use("data mismatch", review.mismatch.delta);
   use("validation overfit", review.overfit.delta);
-  for (const split of review.splits) use(`${SPLIT_WORD[split.split]} split`, split.delta);
-  if (review.slices.length > 0) {
-    const tests = [...new Set(review.slices.map((x2) => x2.delta.test))];
-    for (const t of tests) uses.set(t, [...uses.get(t) ?? [], "slices"]);
+  for (const split of review.splits) use(`${say(SPLIT_WORD, split.split, esc)} split`, split.delta);
+  for (const slice of review.slices) use("slices", slice.delta);
+  for (const [test2, what] of uses) {
+    lines.push(`${[...new Set(what)].join(", ")}: ${say(TEST_WHY, test2, esc)}`);
   }
-  for (const [test, what] of uses) {
-    lines.push(`${[...new Set(what)].join(", ")}: ${TEST_WHY[test]}`);
+  if ((review.guardrails ?? []).some((g) => g.margin !== null)) {
+    lines.push(
+      `Guardrails: a guardrail is within its margin when the one-sided ${levelPercent(review)}% upper confidence bound of its worsening is below the margin, beyond it when the lower bound is above the margin, and undetermined otherwise (the confidence-interval approach to non-inferiority, ICH E9 \xA73.3.2 and E10; Wellek 2010). The one-sided p-values are Holm-adjusted across guardrails; the primary verdict is not adjusted by them. A margin from the config wins over the artifacts', the baseline's over the candidate's.`
+    );
+  }
+  if (review.cost !== void 0 && Object.keys(review.cost).length > 0) {
+    lines.push(
+      "Cost ratios are candidate / baseline; with per-repeat values the interval comes from Welch's t-test on the logarithms (a ratio of geometric means). A single figure (parameters, memory) changes exactly as given; a timing taken once per run has unknown noise."
+    );
   }
   if (review.slices.length > 0) {
     lines.push(
@@ -50643,36 +51717,29 @@ function methodNotes(review, esc) {
     );
   }
   for (const run of ["baseline", "candidate"]) {
-    const r = review[run];
-    lines.push(referenceLine(run, r, review));
-    for (const w of r.warnings) lines.push(`${run}: ${esc(w, 300)}`);
+    lines.push(referenceLine(run, review[run], f, esc));
   }
-  for (const n of review.notes) lines.push(esc(n, 300));
-  for (const n of review.nonLevers) lines.push(esc(n, 300));
+  lines.push(...reviewNotes2(review, f, esc));
   return lines;
 }
-function referenceLine(run, r, review) {
-  const f = numberFormatFor(review);
+function referenceLine(run, r, f, esc) {
   if (r.reference === null) {
     return `${run}: no reference level, so avoidable bias is unknown; set \`reference\` in the artifact or the config.`;
   }
-  const source = {
-    artifact: "from the artifact",
-    config: "from the config",
-    default: "the default for a minimized proportion",
-    unknown: "source unknown"
-  }[r.referenceSource];
-  return `${run}: reference level ${num(r.reference, f)} (${source}).`;
+  return `${run}: reference level ${value(r.reference, f)} (${say(REFERENCE_SOURCE, r.referenceSource, esc)}).`;
 }
-var CURVE_WORD = {
-  epochs: "Epoch curve",
-  training_examples: "Learning curve",
-  regularization: "Regularization curve"
-};
-function skipped(e) {
+function skippedText(e) {
+  return e.skipped === "fit-failed" ? "the power-law fit did not converge" : `needs at least ${count(e.needs)} points, has ${count(e.points)}`;
+}
+var SIDE_WORD = /* @__PURE__ */ new Map([
+  ["below", "below"],
+  ["above", "above"],
+  ["at", "at"]
+]);
+function isSkipped2(e) {
   return "skipped" in e;
 }
-function curveEvidence(review, esc) {
+function curveEvidence2(review) {
   const f = numberFormatFor(review);
   const lines = [];
   for (const run of ["baseline", "candidate"]) {
@@ -50680,22 +51747,27 @@ function curveEvidence(review, esc) {
     const e = curves.epochs;
     if (e !== void 0) {
       lines.push(
-        skipped(e) ? `${run}, ${CURVE_WORD.epochs}: not analysed (${esc(e.skipped, 200)}).` : `${run}, ${CURVE_WORD.epochs}: lowest validation ${num(e.bestValidation, f)} at epoch ${short(e.bestX)}; final ${num(e.finalValidation, f)} at epoch ${short(e.finalX)}; ${e.gl === null ? "generalization loss undefined (best validation is 0)" : `generalization loss ${e.gl.toFixed(1)}%`}${e.pq === null ? "" : `, progress quotient ${e.pq.toFixed(2)}`}${e.stoppedLate ? "; trained past the minimum" : ""}${e.stoppedEarly ? "; still improving at the end" : ""}.`
+        isSkipped2(e) ? `${run}, epoch curve: not analysed (${skippedText(e)}).` : `${run}, epoch curve: lowest validation ${value(e.bestValidation, f)} at epoch ${short(e.bestX)}; final ${value(e.finalValidation, f)} at epoch ${short(e.finalX)}; ${e.gl === null ? "generalization loss undefined (best validation is 0)" : `generalization loss ${fixed(e.gl, 1)}%`}${e.pq === null ? "" : `, progress quotient ${fixed(e.pq, 2)}`}${e.stoppedLate ? "; trained past the minimum" : ""}${e.stoppedEarly ? "; still improving at the end" : ""}.`
       );
     }
     const l = curves.training_examples;
     if (l !== void 0) {
-      const lp = skipped(l) ? "" : l.projections.map(
-        (p) => `${short(p.x)} examples \u2192 ${num(p.validation, f)} [${num(p.ci[0], f)}, ${num(p.ci[1], f)}]`
-      ).join("; ");
-      lines.push(
-        skipped(l) ? `${run}, ${CURVE_WORD.training_examples}: not analysed (${esc(l.skipped, 200)}).` : `${run}, ${CURVE_WORD.training_examples}: power-law fit R\xB2 ${l.r2.toFixed(3)}, residual sd ${num(l.residual, f)}; projected validation: ${lp || "none"}; train/validation gap ${l.gapTrend}.`
-      );
+      if (isSkipped2(l)) lines.push(`${run}, learning curve: not analysed (${skippedText(l)}).`);
+      else {
+        const projected = l.projections.map((p) => `${count(p.x)} examples \u2192 ${value(p.validation, f)} (${valueRange(p.ci, f)})`).join("; ");
+        lines.push(
+          `${run}, learning curve: power-law fit R\xB2 ${fixed(l.r2, 3)}, residual sd ${amount(l.residual, f)}; projected validation: ${projected || "none"}; train/validation gap ${l.gapTrend === "closing" ? "closing" : l.gapTrend === "flat" ? "flat" : "unknown"}.`
+        );
+      }
     }
     const g = curves.regularization;
-    if (g !== void 0) {
+    if (g !== void 0 && isSkipped2(g))
+      lines.push(`${run}, regularization curve: not analysed (${skippedText(g)}).`);
+    else if (g !== void 0) {
+      const side = SIDE_WORD.get(g.side) ?? "at an unknown place relative to";
+      const edge = g.atEdge === null ? "" : `; the minimum is at the ${g.atEdge === "low" ? "low" : "high"} end of the sweep, so extend it`;
       lines.push(
-        skipped(g) ? `${run}, ${CURVE_WORD.regularization}: not analysed (${esc(g.skipped, 200)}).` : `${run}, ${CURVE_WORD.regularization}: lowest validation ${num(g.bestValidation, f)} at strength ${short(g.bestX)}; the run's own strength is ${g.side === "at" ? "at" : g.side === "unknown" ? "at an unknown place relative to" : g.side} the best; suggested ${short(g.suggestedX)}${g.atEdge === null ? "" : `; the minimum is at the ${g.atEdge} end of the sweep, so extend it`}.`
+        `${run}, regularization curve: lowest validation ${value(g.bestValidation, f)} at strength ${short(g.bestX)}; the run's own strength is ${side} the best; suggested ${short(g.suggestedX)}${edge}.`
       );
     }
   }
@@ -50773,7 +51845,10 @@ Too large for this space: see the JSON report.
   return stub.length <= target ? stub : stub.slice(0, Math.max(0, target));
 }
 function table(t) {
-  return markdownTable([t.header, ...t.rows], { align: t.align, alignDelimiters: false });
+  const body = markdownTable([t.header, ...t.rows], { align: t.align, alignDelimiters: false });
+  return t.units === void 0 || t.units === null ? body : `${t.units}
+
+${body}`;
 }
 function details(summary2, body) {
   return ["<details>", `<summary>${summary2}</summary>`, "", ...body, "", "</details>", ""];
@@ -50789,8 +51864,10 @@ function headlineBlock(review) {
 }
 function compose(review, { marker, files, charts }, d) {
   const out = [marker, ...headlineBlock(review)];
-  out.push("### Splits", "", table(splitsTable(review)), "");
-  out.push("### Error decomposition", "", table(decompositionTable(review)), "");
+  const guards = guardrailsTable(review, escapeInline, levelPercent(review));
+  if (guards !== null) out.push("### Guardrails and cost", "", table(guards), "");
+  out.push("### Splits", "", table(splitsTable(review, escapeInline)), "");
+  out.push("### Error decomposition", "", table(decompositionTable(review, escapeInline)), "");
   const missing = unavailableNotes(review, escapeInline);
   if (missing.length > 0) out.push(...missing.map((m) => `- ${m}`), "");
   if (review.levers.length > 0) {
@@ -50823,7 +51900,7 @@ function compose(review, { marker, files, charts }, d) {
     );
   }
   if (d.rest) {
-    const evidence = curveEvidence(review, escapeInline);
+    const evidence = curveEvidence2(review);
     if (evidence.length > 0)
       out.push(
         ...details(
@@ -51105,7 +52182,7 @@ function setReviewOutputs(io, review, reportPath, reportDir) {
 }
 function gateFailure(review) {
   return `fitgap gate failed:
-${review.gate.reasons.map((r) => `- ${r}`).join("\n")}`;
+${gateReasonLines(review, plainText).map((r) => `- ${r}`).join("\n")}`;
 }
 function runUrl(context3) {
   return `${context3.serverUrl}/${context3.repo.owner}/${context3.repo.repo}/actions/runs/${context3.runId}`;
@@ -51164,7 +52241,7 @@ async function gateCheckStep(deps, kind, sha, review, body) {
       pass: review.gate.pass,
       title: `${review.movement}; validation ${review.validation.change}`,
       summary: body,
-      reasons: review.gate.reasons,
+      reasons: gateReasonLines(review, escapeInline),
       detailsUrl: runUrl(context3)
     });
     io.info(
@@ -51188,21 +52265,21 @@ function renderJson(review) {
   return `${JSON.stringify(review, null, 2)}
 `;
 }
-function assertFinite2(value, pointer) {
-  if (typeof value === "number") {
-    if (!Number.isFinite(value)) {
+function assertFinite2(value2, pointer) {
+  if (typeof value2 === "number") {
+    if (!Number.isFinite(value2)) {
       throw new RangeError(
-        `fitgap-review/1 ${pointer || "/"} is ${String(value)}; the review model must hold finite numbers only (this is a bug)`
+        `fitgap-review/1 ${pointer || "/"} is ${String(value2)}; the review model must hold finite numbers only (this is a bug)`
       );
     }
     return;
   }
-  if (Array.isArray(value)) {
-    value.forEach((item, i2) => assertFinite2(item, `${pointer}/${i2}`));
+  if (Array.isArray(value2)) {
+    value2.forEach((item, i2) => assertFinite2(item, `${pointer}/${i2}`));
     return;
   }
-  if (value !== null && typeof value === "object") {
-    for (const [key, item] of Object.entries(value)) {
+  if (value2 !== null && typeof value2 === "object") {
+    for (const [key, item] of Object.entries(value2)) {
       assertFinite2(item, `${pointer}/${key.replace(/~/g, "~0").replace(/\//g, "~1")}`);
     }
   }
@@ -51311,7 +52388,9 @@ async function runPublish(deps) {
     if (problem !== null) problems.push(problem);
   }
   if (!review.gate.pass)
-    io.info(`Gate failed (published on ${run.headSha}): ${review.gate.reasons.join("; ")}`);
+    io.info(
+      `Gate failed (published on ${run.headSha}): ${gateReasonLines(review, plainText).join("; ")}`
+    );
   if (problems.length > 0) io.setFailed(problems.join("\n"));
 }
 async function downloadUpload(deps, run) {
@@ -51401,8 +52480,8 @@ async function runReview(deps) {
 // src/entries/action/settings.ts
 import { tmpdir } from "node:os";
 function optional(name) {
-  const value = getInput(name);
-  return value === "" ? null : value;
+  const value2 = getInput(name);
+  return value2 === "" ? null : value2;
 }
 function required(name, issues) {
   try {
@@ -51413,14 +52492,14 @@ function required(name, issues) {
   }
 }
 function oneOf(name, allowed, issues) {
-  const value = required(name, issues);
-  if (value === "") return allowed[0];
-  if (allowed.includes(value)) return value;
+  const value2 = required(name, issues);
+  if (value2 === "") return allowed[0];
+  if (allowed.includes(value2)) return value2;
   issues.push({
     file: `input "${name}"`,
     pointer: "",
     expected: `must be one of ${allowed.join(", ")}`,
-    got: quote(value)
+    got: quote(value2)
   });
   return allowed[0];
 }
@@ -51462,8 +52541,8 @@ function limitInputs(issues) {
 function archiveLimit(issues) {
   const text2 = optional("archive-limit-mb");
   if (text2 === null) return 50 * 1024 * 1024;
-  const value = /^\s*(?:\d+(?:\.\d*)?|\.\d+)\s*$/.test(text2) ? Number(text2) : Number.NaN;
-  if (!(value >= 1e-3 && value <= 2048)) {
+  const value2 = /^\s*(?:\d+(?:\.\d*)?|\.\d+)\s*$/.test(text2) ? Number(text2) : Number.NaN;
+  if (!(value2 >= 1e-3 && value2 <= 2048)) {
     issues.push({
       file: 'input "archive-limit-mb"',
       pointer: "",
@@ -51472,7 +52551,7 @@ function archiveLimit(issues) {
     });
     return 50 * 1024 * 1024;
   }
-  return Math.round(value * 1024 * 1024);
+  return Math.round(value2 * 1024 * 1024);
 }
 function readSettings(env = process.env) {
   const issues = [];
@@ -51545,8 +52624,8 @@ function readSettings(env = process.env) {
 }
 function testNumber(env, name, otherwise) {
   const text2 = env[name];
-  const value = text2 === void 0 ? NaN : Number(text2);
-  return Number.isFinite(value) && value > 0 ? value : otherwise;
+  const value2 = text2 === void 0 ? NaN : Number(text2);
+  return Number.isFinite(value2) && value2 > 0 ? value2 : otherwise;
 }
 
 // node_modules/@octokit/rest/dist-src/index.js
@@ -51951,11 +53030,11 @@ function createClient(options) {
 }
 
 // src/io/github/context.ts
-function record(value) {
-  return typeof value === "object" && value !== null && !Array.isArray(value) ? value : null;
+function record(value2) {
+  return typeof value2 === "object" && value2 !== null && !Array.isArray(value2) ? value2 : null;
 }
-function text(value) {
-  return typeof value === "string" && value !== "" ? value : null;
+function text(value2) {
+  return typeof value2 === "string" && value2 !== "" ? value2 : null;
 }
 function fullName(repo) {
   return text(record(repo)?.["full_name"]);

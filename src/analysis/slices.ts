@@ -5,7 +5,7 @@
 import type { RunArtifact, Slice } from '../model/run.js';
 import { binomialVariance, holmAdjust, normalTest } from '../stats/index.js';
 import type { TestResult } from '../stats/types.js';
-import { callOf, type CallSettings } from './noise.js';
+import { callOf, toMetricDelta, type CallSettings } from './noise.js';
 import type { SliceChange, ValidationChange } from '../model/review.js';
 
 function sliceTest(b: Slice, c: Slice, proportion: boolean, alpha: number): TestResult {
@@ -54,13 +54,7 @@ export function compareSlices(
       examples: c.examples ?? null,
       baseline: b.validation,
       candidate: c.validation,
-      delta: {
-        estimate: test.estimate,
-        ci: test.ci,
-        p: test.p,
-        test: test.test,
-        call: callOf(test, settings),
-      },
+      delta: toMetricDelta(test, settings),
       pAdjusted,
       change,
       hiddenRegression: change === 'worse' && aggregate === 'better',

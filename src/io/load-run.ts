@@ -13,6 +13,7 @@ import type { EpochLogMapping } from '../model/config.js';
 import { parseEpochLog } from '../artifact/epoch-log.js';
 import type { PredictionsFile } from '../artifact/predictions.js';
 import { parseJson } from '../artifact/read-json.js';
+import type { Note } from '../model/review.js';
 import type { RunArtifact } from '../model/run.js';
 import { semanticIssues, validateRun } from '../validate/run.js';
 import {
@@ -42,7 +43,7 @@ export interface LoadedRun {
   /** The predictions CSV, opened afresh (and checked again) for every pass. */
   predictions: PredictionsFile | null;
   /** What the loader did that the review should mention. */
-  notes: string[];
+  notes: Note[];
   /** Every file read (the artifact, its predictions, its epoch log). */
   read: ReadFile[];
 }
@@ -105,7 +106,7 @@ export async function loadRun(path: string, options: LoadRunOptions = {}): Promi
   const sha256 = createHash('sha256').update(bytes).digest('hex');
   const text = decodeUtf8(bytes, file, 'a run artifact');
   const artifact = validateRun(parseJson(text, file), file);
-  const notes: string[] = [];
+  const notes: Note[] = [];
 
   let predictionsPath: string | null = null;
   let predictions: PredictionsFile | null = null;
@@ -146,9 +147,7 @@ export async function loadRun(path: string, options: LoadRunOptions = {}): Promi
     const present = logPath !== null && (await lstat(logPath).catch(() => null)) !== null;
     if (logPath !== null && present) {
       if (artifact.curves?.epochs !== undefined) {
-        notes.push(
-          `${file}: the artifact has its own curves.epochs; the epoch log ${logName} was not used.`,
-        );
+        notes.push({ code: 'epoch-log-not-used', file, log: logName });
       } else {
         const log = await readChecked({
           path: logPath,
@@ -169,9 +168,7 @@ export async function loadRun(path: string, options: LoadRunOptions = {}): Promi
         if (issues.length > 0) throw new InputError(issues);
       }
     } else {
-      notes.push(
-        `No epoch log ${logName} next to ${file}; the config's epoch-log mapping was not applied to it.`,
-      );
+      notes.push({ code: 'epoch-log-missing', file, log: logName });
     }
   }
   return { artifact, file, sha256, predictionsPath, predictions, notes, read };

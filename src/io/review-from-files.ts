@@ -6,9 +6,9 @@
 import { createHash } from 'node:crypto';
 import { resolve } from 'node:path';
 import type { Readable } from 'node:stream';
-import { buildReview } from '../analysis/review.js';
-import type { PairedPredictions } from '../model/review.js';
-import type { Review, ReviewSettings } from '../model/review.js';
+import { buildReview, type ReviewInput } from '../analysis/review.js';
+import type { Note, PairedPredictions } from '../model/review.js';
+import type { Review } from '../model/review.js';
 import { loadRun, type LoadedRun, type ReadFile } from './load-run.js';
 import { checkPredictions, pairPredictions } from '../artifact/predictions.js';
 import { loadConfig } from './load-config.js';
@@ -100,7 +100,7 @@ export const DEFAULT_CONFIG_PATH = '.github/fitgap.yml';
 export function resolveSettings(
   config: ConfigFile,
   overrides: SettingsOverrides = {},
-): ReviewSettings & { reference?: number } {
+): ReviewInput['settings'] {
   const reference = overrides.reference ?? config.reference;
   return {
     alpha: overrides.alpha ?? config.alpha ?? DEFAULT_SETTINGS.alpha,
@@ -109,6 +109,13 @@ export function resolveSettings(
       overrides.gapTolerance ?? config['gap-tolerance'] ?? DEFAULT_SETTINGS.gapTolerance,
     failOn: overrides.failOn ?? config['fail-on'] ?? [...DEFAULT_SETTINGS.failOn],
     ...(reference === undefined ? {} : { reference }),
+    ...(config.guardrails === undefined
+      ? {}
+      : {
+          guardrailMargins: new Map(
+            Object.entries(config.guardrails).map(([name, g]) => [name, g.margin]),
+          ),
+        }),
   };
 }
 
@@ -132,11 +139,11 @@ const MIN_PAIRED_ROWS = 2;
 async function pairIfBoth(
   baseline: LoadedRun,
   candidate: LoadedRun,
-): Promise<{ paired?: PairedPredictions; notes: string[] }> {
+): Promise<{ paired?: PairedPredictions; notes: Note[] }> {
   const bp = baseline.artifact.predictions;
   const cp = candidate.artifact.predictions;
   const kind = candidate.artifact.metric.kind;
-  const unpaired = async (notes: string[]) => {
+  const unpaired = async (notes: Note[]) => {
     // Not paired, but still checked: a broken file is an error whether or not it is used.
     for (const run of [baseline, candidate])
       if (run.predictions !== null) await checkPredictions(run.predictions, kind);
@@ -150,17 +157,17 @@ async function pairIfBoth(
   ) {
     return unpaired(
       bp !== cp && (bp === undefined || cp === undefined)
-        ? ['Only one run ships per-example predictions: no paired test.']
+        ? [{ code: 'predictions-in-one-run' }]
         : [],
     );
   }
   if (bp.split !== cp.split) {
     return unpaired([
-      `The predictions are for different splits (${bp.split} vs ${cp.split}): no paired test.`,
+      { code: 'predictions-split-mismatch', baseline: bp.split, candidate: cp.split },
     ]);
   }
   const result = await pairPredictions(baseline.predictions, candidate.predictions, kind);
-  const notes: string[] = [];
+  const notes: Note[] = [];
   const { unmatched, ...paired } = result;
   if (result.rows < MIN_PAIRED_ROWS) {
     throw new InputError([
@@ -174,9 +181,12 @@ async function pairIfBoth(
     ]);
   }
   if (unmatched.baseline + unmatched.candidate > 0) {
-    notes.push(
-      `Predictions paired by id: ${result.rows} rows in both; ${unmatched.baseline} baseline and ${unmatched.candidate} candidate rows had no partner and were left out of the paired test.`,
-    );
+    notes.push({
+      code: 'predictions-unmatched',
+      rows: result.rows,
+      baseline: unmatched.baseline,
+      candidate: unmatched.candidate,
+    });
   }
   return { paired: { ...paired, split: bp.split }, notes };
 }

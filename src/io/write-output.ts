@@ -22,6 +22,13 @@ async function realTarget(path: string): Promise<string | null> {
   return folder === null ? null : join(folder, basename(path));
 }
 
+/** The real path and device:inode of a file named as an input, or null when it does not exist. */
+export async function identify(path: string): Promise<ReadFile | null> {
+  const real = await realpath(path).catch(() => null);
+  const info = real === null ? null : await stat(real).catch(() => null);
+  return real === null || info === null ? null : { realPath: real, id: `${info.dev}:${info.ino}` };
+}
+
 export async function writeOutput(
   path: string,
   text: string,

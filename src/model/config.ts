@@ -9,6 +9,8 @@ export interface ConfigFile {
   'epoch-log'?: EpochLogMapping;
   /** Byte limits of the input files, in MB (the config file's own limit is set by flag or input). */
   limits?: { 'artifact-mb'?: number; 'csv-mb'?: number };
+  /** Non-inferiority margins by guardrail name. */
+  guardrails?: Record<string, { margin: number }>;
 }
 
 /** Maps the columns of a CSV epoch log (e.g. `epoch,train_loss,val_loss`) onto `curves.epochs`. */

@@ -69,6 +69,30 @@ export interface PredictionsRef {
 
 export type Hyperparameters = Record<string, unknown>;
 
+/** A metric that must not get worse by more than `margin` (its own units). */
+export interface Guardrail {
+  metric: Metric;
+  splits: { validation: Split; test?: Split };
+  /** Non-inferiority margin: the largest acceptable worsening. */
+  margin?: number;
+}
+
+/** What a run cost. Lists hold one value per repeat. All values > 0. */
+export interface Cost {
+  trainSeconds?: number[];
+  inferenceMs?: number[];
+  parameters?: number;
+  memoryMb?: number;
+}
+
+export type CostField = keyof Cost;
+export const COST_FIELDS: readonly CostField[] = [
+  'trainSeconds',
+  'inferenceMs',
+  'parameters',
+  'memoryMb',
+];
+
 export interface RunArtifact {
   format: 'fitgap-run/1';
   run: { name: string; commit?: string; createdAt?: string };
@@ -84,4 +108,6 @@ export interface RunArtifact {
   curves?: Curves;
   slices?: Slice[];
   predictions?: PredictionsRef;
+  guardrails?: Guardrail[];
+  cost?: Cost;
 }

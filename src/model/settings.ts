@@ -20,13 +20,27 @@ export const FAIL_ON_VALUES = [
   'high-variance',
   'data-mismatch',
   'validation-overfit',
+  'guardrail-regression',
+  'guardrail-undetermined',
   'none',
 ] as const;
 
-export type FailOn = (typeof FAIL_ON_VALUES)[number];
+/** Cost fields as `fail-on` names them (`train-seconds-ratio>2`), mapped to the run format's keys. */
+export const COST_OUTCOME_FIELDS = new Map([
+  ['train-seconds', 'trainSeconds'],
+  ['inference-ms', 'inferenceMs'],
+  ['parameters', 'parameters'],
+  ['memory-mb', 'memoryMb'],
+] as const);
+
+/** `FIELD-ratio>X`: fails when candidate / baseline of that cost exceeds X. */
+export const COST_RATIO_OUTCOME =
+  /^(train-seconds|inference-ms|parameters|memory-mb)-ratio>((?:0|[1-9][0-9]*)(?:\.[0-9]+)?)$/;
+
+export type FailOn = (typeof FAIL_ON_VALUES)[number] | `${string}-ratio>${string}`;
 
 export function isFailOn(value: string): value is FailOn {
-  return (FAIL_ON_VALUES as readonly string[]).includes(value);
+  return (FAIL_ON_VALUES as readonly string[]).includes(value) || COST_RATIO_OUTCOME.test(value);
 }
 
 export const DEFAULT_SETTINGS: ReviewSettings = {
@@ -134,7 +148,7 @@ export function failOnIssues(values: readonly string[], source: SettingSource): 
           {
             ...source,
             pointer: at(i),
-            expected: `must be one of ${FAIL_ON_VALUES.join(', ')}`,
+            expected: `must be one of ${FAIL_ON_VALUES.join(', ')}, or FIELD-ratio>X (FIELD one of ${[...COST_OUTCOME_FIELDS.keys()].join(', ')})`,
             got: quote(value),
             hint: 'Separate outcomes with commas or new lines.',
           },

@@ -8,6 +8,7 @@ import type { ValidateFunction } from 'ajv';
 import schema from '../../schema/fitgap-run-1.schema.json' with { type: 'json' };
 import { InputError, quote, type Issue } from '../model/errors.js';
 import { ajvIssues, outOfRangeNumbers } from './ajv-issues.js';
+import { guardrailIssues } from './guardrails.js';
 import { MAX_CURVE_POINTS, MAX_MAGNITUDE, formatLimit } from '../model/limits.js';
 import { CURVE_NAMES, SPLIT_NAMES, type RunArtifact } from '../model/run.js';
 
@@ -138,6 +139,7 @@ export function semanticIssues(run: RunArtifact, file: string): Issue[] {
       });
     }
   }
+  issues.push(...guardrailIssues(run, file));
   return issues;
 }
 

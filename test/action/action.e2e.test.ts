@@ -6,6 +6,7 @@
 import { existsSync, readFileSync, readdirSync } from 'node:fs';
 import { join } from 'node:path';
 import { beforeAll, describe, test } from 'vitest';
+import { expectValidReport } from '../report/valid-review.js';
 import type { ExpectStatic, TestContext } from 'vitest';
 import { BOT, FakeRepo, MAINTAINER, PAT, PERSON, TOKEN } from '../fake-github/repo.js';
 import { FakeGitHub, apiError } from '../fake-github/server.js';
@@ -75,10 +76,9 @@ describe.concurrent('review mode on a pull request', { timeout: 90_000 }, () => 
     // The gate (fail-on: worse-validation, the default when neither input nor config sets it) fails the step after commenting.
     expect(run.code).toBe(1);
     expect(run.stdout).toMatch(/::error::fitgap gate failed:%0A- worse-validation/);
-    const report = JSON.parse(readFileSync(run.outputs['report-path'] ?? '', 'utf8')) as Record<
-      string,
-      unknown
-    >;
+    const text = readFileSync(run.outputs['report-path'] ?? '', 'utf8');
+    expectValidReport(text);
+    const report = JSON.parse(text) as Record<string, unknown>;
     expect(report['format']).toBe('fitgap-review/1');
     expect(run.outputs).toMatchObject({
       movement: report['movement'],
@@ -485,7 +485,9 @@ describe.concurrent(
           comment: 'off',
         },
       });
-      return filesOf(run.outputs['report-dir'] ?? '');
+      const dir = run.outputs['report-dir'] ?? '';
+      expectValidReport(readFileSync(join(dir, 'review.json'), 'utf8'));
+      return filesOf(dir);
     }
     const event = {
       action: 'completed',

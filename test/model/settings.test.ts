@@ -11,6 +11,7 @@ import { parseConfig } from '../../src/io/load-config.js';
 import { LIMIT_NAMES, LIMIT_RANGES_MB } from '../../src/io/open-untrusted.js';
 import { InputError } from '../../src/model/errors.js';
 import {
+  COST_RATIO_OUTCOME,
   FAIL_ON_VALUES,
   NUMBER_SETTINGS,
   parseDecimal,
@@ -35,7 +36,10 @@ describe('the config schema agrees with the settings source', () => {
     expect(list).toEqual({
       type: 'array',
       minItems: 1,
-      items: { type: 'string', enum: [...FAIL_ON_VALUES] },
+      items: {
+        type: 'string',
+        anyOf: [{ enum: [...FAIL_ON_VALUES] }, { pattern: COST_RATIO_OUTCOME.source }],
+      },
     });
   });
 
@@ -141,6 +145,11 @@ describe('a flag, an input and a config key agree', () => {
       { problem: expect.stringContaining('must be one of worse-validation') },
     ],
     ['none', { value: ['none'] }],
+    [
+      'worse-validation, train-seconds-ratio>1.5',
+      { value: ['worse-validation', 'train-seconds-ratio>1.5'] },
+    ],
+    ['train-seconds-ratio>x', { problem: expect.stringContaining('or FIELD-ratio>X') }],
     [',', { problem: 'must name at least one outcome (got an empty list)' }],
   ])('fail-on %j', (text, expected) => {
     const [flag, input, config] = threeWays('fail-on', text);

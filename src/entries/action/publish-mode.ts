@@ -15,6 +15,8 @@ import { downloadArtifact } from '../../io/github/artifacts.js';
 import type { WorkflowRunRef } from '../../io/github/context.js';
 import { PULL_REQUEST_FILE, RUN_FILE, extractBundle } from '../../io/bundle.js';
 import { resolveLimits, reviewFiles } from '../../io/review-from-files.js';
+import { plainText } from '../../report/escape.js';
+import { gateReasonLines } from '../../report/gate.js';
 import { renderMarkdown } from '../../report/markdown.js';
 import { resolveBaseline } from './baseline.js';
 import type { PublishDeps } from './publish-steps.js';
@@ -122,7 +124,9 @@ export async function runPublish(deps: PublishDeps): Promise<void> {
     if (problem !== null) problems.push(problem);
   }
   if (!review.gate.pass)
-    io.info(`Gate failed (published on ${run.headSha}): ${review.gate.reasons.join('; ')}`);
+    io.info(
+      `Gate failed (published on ${run.headSha}): ${gateReasonLines(review, plainText).join('; ')}`,
+    );
   if (problems.length > 0) io.setFailed(problems.join('\n'));
 }
 

@@ -4,6 +4,8 @@
  */
 import type { Review } from '../../model/review.js';
 import { publishGate } from '../../io/github/check.js';
+import { escapeInline, plainText } from '../../report/escape.js';
+import { gateReasonLines } from '../../report/gate.js';
 import type { GitHubClient } from '../../io/github/client.js';
 import { publishComment } from '../../io/github/comment.js';
 import { resolveIdentity } from '../../io/github/identity.js';
@@ -33,9 +35,11 @@ export function setReviewOutputs(
   io.setOutput('report-dir', reportDir);
 }
 
-/** The step's failure message when the gate failed. */
+/** The step's failure message when the gate failed (one plain line per reason). */
 export function gateFailure(review: Review): string {
-  return `fitgap gate failed:\n${review.gate.reasons.map((r) => `- ${r}`).join('\n')}`;
+  return `fitgap gate failed:\n${gateReasonLines(review, plainText)
+    .map((r) => `- ${r}`)
+    .join('\n')}`;
 }
 
 export function runUrl(context: RunContext): string {
@@ -113,7 +117,7 @@ export async function gateCheckStep(
       pass: review.gate.pass,
       title: `${review.movement}; validation ${review.validation.change}`,
       summary: body,
-      reasons: review.gate.reasons,
+      reasons: gateReasonLines(review, escapeInline),
       detailsUrl: runUrl(context),
     });
     io.info(

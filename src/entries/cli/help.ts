@@ -5,12 +5,14 @@ Usage:
   fitgap review --baseline FILE --candidate FILE [options]
   fitgap validate FILE...
   fitgap demo [NAME]
+  fitgap curves import --from FORMAT PATH... --out FILE
   fitgap --version
 
 Commands:
   review     compare two run artifacts and print the review
   validate   check run artifacts (.json) or config files (.yml) and exit
   demo       review the bundled demo scenario
+  curves     import a training log (CSV, TensorBoard, MLflow, evals_result) as a curve
 
 Run 'fitgap COMMAND --help' for the options of a command.
 

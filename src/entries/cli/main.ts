@@ -1,6 +1,7 @@
 /** Dispatches a CLI invocation to its command and maps errors to exit codes. */
 import { EXIT, InputError, UsageError } from '../../model/errors.js';
 import { demoCommand, reviewCommand, validateCommand } from './commands.js';
+import { curvesCommand } from './curves-import.js';
 import { MAIN_HELP } from './help.js';
 import type { CliIo } from './io.js';
 
@@ -14,6 +15,8 @@ export async function runCli(argv: string[], io: CliIo): Promise<number> {
         return await validateCommand(rest, io);
       case 'demo':
         return await demoCommand(rest, io);
+      case 'curves':
+        return await curvesCommand(rest, io);
       case '--version':
       case '-v':
         io.stdout(`${io.version}\n`);
