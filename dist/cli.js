@@ -25592,7 +25592,7 @@ async function validateCommand(argv, io) {
         if (run.predictions !== null)
           await checkPredictions(run.predictions, run.artifact.metric.kind);
         io.stdout(
-          `${file}: valid run artifact "${run.artifact.run.name}" (${run.artifact.splits.train.values.length} repeat(s)${run.predictions === null ? "" : ", predictions checked"})
+          `${file}: valid run artifact "${run.artifact.run.name}" (${run.artifact.splits.train.values.length} repeat(s))
 `
         );
       }

@@ -168,7 +168,7 @@ describe('fitgap CLI (built)', () => {
     const ok = await fitgap(['validate', 'test/fixtures/design/example.json', 'demo/fitgap.yml']);
     expect(ok.code).toBe(0);
     expect(ok.stdout).toContain(
-      'test/fixtures/design/example.json: valid run artifact "poly-degree-3" (3 repeat(s), predictions checked)',
+      'test/fixtures/design/example.json: valid run artifact "poly-degree-3" (3 repeat(s))',
     );
     const bad = await fitgap(['validate', 'test/fixtures/bad/bad-goal.json']);
     expect(bad.code).toBe(2);

@@ -526,7 +526,7 @@ describe('validate checks everything review would', () => {
     const dir = folder({ 'run.json': withPredictions('p.csv'), 'p.csv': PREDICTIONS });
     const run = await cli(dir, ['validate', 'run.json']);
     expect(run.code, run.stderr).toBe(0);
-    expect(run.stdout).toContain('predictions checked');
+    expect(run.stdout).toBe('run.json: valid run artifact "poly-degree-3" (3 repeat(s))\n');
   });
 });
 

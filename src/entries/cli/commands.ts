@@ -120,7 +120,7 @@ export async function validateCommand(argv: string[], io: CliIo): Promise<number
         if (run.predictions !== null)
           await checkPredictions(run.predictions, run.artifact.metric.kind);
         io.stdout(
-          `${file}: valid run artifact "${run.artifact.run.name}" (${run.artifact.splits.train.values.length} repeat(s)${run.predictions === null ? '' : ', predictions checked'})\n`,
+          `${file}: valid run artifact "${run.artifact.run.name}" (${run.artifact.splits.train.values.length} repeat(s))\n`,
         );
       }
     } catch (error) {
