@@ -46417,7 +46417,7 @@ async function openChecked(target) {
   }
   try {
     const stats = await handle.stat();
-    if (!stats.isFile()) refuse2(target, `must be a regular file (${target.what})`, kindOf(stats));
+    if (!stats.isFile()) refuse2(target, "must be a regular file", kindOf(stats));
     const opened = await realpath(`/proc/self/fd/${handle.fd}`).catch(() => null);
     if (opened !== null && opened !== real && !isInside(folder, opened)) {
       refuse2(target, "must not change while it is opened", "a path that moved outside its folder");
@@ -46440,7 +46440,7 @@ async function openChecked(target) {
 function grew(target) {
   refuse2(
     target,
-    `must be a regular file of fixed size (${target.what})`,
+    "must be a regular file of fixed size",
     "more bytes than its size promised",
     "Files that change while read (logs being written, files under /proc) are refused; copy it first."
   );

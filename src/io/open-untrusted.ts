@@ -225,7 +225,7 @@ export async function openChecked(target: UntrustedFile): Promise<CheckedFile> {
   }
   try {
     const stats = await handle.stat();
-    if (!stats.isFile()) refuse(target, `must be a regular file (${target.what})`, kindOf(stats));
+    if (!stats.isFile()) refuse(target, 'must be a regular file', kindOf(stats));
     // Check after open: the descriptor's own path, in case a folder on the way was swapped for a
     // link between the real-path check and the open (Linux; elsewhere the first check stands).
     const opened = await realpath(`/proc/self/fd/${handle.fd}`).catch(() => null);
@@ -251,7 +251,7 @@ export async function openChecked(target: UntrustedFile): Promise<CheckedFile> {
 function grew(target: UntrustedFile): never {
   refuse(
     target,
-    `must be a regular file of fixed size (${target.what})`,
+    'must be a regular file of fixed size',
     'more bytes than its size promised',
     'Files that change while read (logs being written, files under /proc) are refused; copy it first.',
   );
