@@ -6,6 +6,8 @@ import { createReadStream, mkdirSync, writeFileSync, existsSync } from 'node:fs'
 import { createInterface } from 'node:readline';
 import { join } from 'node:path';
 import { pairPredictions } from '../src/artifact/predictions.js';
+import { predictionsSource } from '../src/io/load-run.js';
+import { DEFAULT_FILE_LIMITS } from '../src/io/open-untrusted.js';
 import { analyzeCurves } from '../src/analysis/curves/index.js';
 import type { CurvePoint } from '../src/model/run.js';
 
@@ -66,17 +68,27 @@ function epochCurve(n: number): CurvePoint[] {
   });
 }
 
+/** The predictions reader's input as the review opens it (checked, streamed). */
+const csvSource = (path: string, file: string) =>
+  predictionsSource({
+    path,
+    file,
+    what: 'a predictions CSV',
+    limit: 'csvBytes',
+    limits: DEFAULT_FILE_LIMITS,
+  });
+
 const variants: Record<string, () => Promise<unknown>> = {
   'pair-streaming-in-order': () =>
     pairPredictions(
-      { path: join(dir, 'baseline.csv'), file: 'b' },
-      { path: join(dir, 'candidate.csv'), file: 'c' },
+      csvSource(join(dir, 'baseline.csv'), 'b'),
+      csvSource(join(dir, 'candidate.csv'), 'c'),
       'proportion',
     ),
   'pair-streaming-shuffled': () =>
     pairPredictions(
-      { path: join(dir, 'baseline.csv'), file: 'b' },
-      { path: join(dir, 'shuffled.csv'), file: 'c' },
+      csvSource(join(dir, 'baseline.csv'), 'b'),
+      csvSource(join(dir, 'shuffled.csv'), 'c'),
       'proportion',
     ),
   'pair-naive-maps': () => naivePair(join(dir, 'baseline.csv'), join(dir, 'candidate.csv')),

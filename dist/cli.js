@@ -413,11 +413,11 @@ var require_codegen = __commonJS({
         const rhs = this.rhs === void 0 ? "" : ` = ${this.rhs}`;
         return `${varKind} ${this.name}${rhs};` + _n;
       }
-      optimizeNames(names2, constants) {
+      optimizeNames(names2, constants2) {
         if (!names2[this.name.str])
           return;
         if (this.rhs)
-          this.rhs = optimizeExpr(this.rhs, names2, constants);
+          this.rhs = optimizeExpr(this.rhs, names2, constants2);
         return this;
       }
       get names() {
@@ -434,10 +434,10 @@ var require_codegen = __commonJS({
       render({ _n }) {
         return `${this.lhs} = ${this.rhs};` + _n;
       }
-      optimizeNames(names2, constants) {
+      optimizeNames(names2, constants2) {
         if (this.lhs instanceof code_1.Name && !names2[this.lhs.str] && !this.sideEffects)
           return;
-        this.rhs = optimizeExpr(this.rhs, names2, constants);
+        this.rhs = optimizeExpr(this.rhs, names2, constants2);
         return this;
       }
       get names() {
@@ -498,8 +498,8 @@ var require_codegen = __commonJS({
       optimizeNodes() {
         return `${this.code}` ? this : void 0;
       }
-      optimizeNames(names2, constants) {
-        this.code = optimizeExpr(this.code, names2, constants);
+      optimizeNames(names2, constants2) {
+        this.code = optimizeExpr(this.code, names2, constants2);
         return this;
       }
       get names() {
@@ -528,12 +528,12 @@ var require_codegen = __commonJS({
         }
         return nodes.length > 0 ? this : void 0;
       }
-      optimizeNames(names2, constants) {
+      optimizeNames(names2, constants2) {
         const { nodes } = this;
         let i2 = nodes.length;
         while (i2--) {
           const n = nodes[i2];
-          if (n.optimizeNames(names2, constants))
+          if (n.optimizeNames(names2, constants2))
             continue;
           subtractNames(names2, n.names);
           nodes.splice(i2, 1);
@@ -586,12 +586,12 @@ var require_codegen = __commonJS({
           return void 0;
         return this;
       }
-      optimizeNames(names2, constants) {
+      optimizeNames(names2, constants2) {
         var _a2;
-        this.else = (_a2 = this.else) === null || _a2 === void 0 ? void 0 : _a2.optimizeNames(names2, constants);
-        if (!(super.optimizeNames(names2, constants) || this.else))
+        this.else = (_a2 = this.else) === null || _a2 === void 0 ? void 0 : _a2.optimizeNames(names2, constants2);
+        if (!(super.optimizeNames(names2, constants2) || this.else))
           return;
-        this.condition = optimizeExpr(this.condition, names2, constants);
+        this.condition = optimizeExpr(this.condition, names2, constants2);
         return this;
       }
       get names() {
@@ -614,10 +614,10 @@ var require_codegen = __commonJS({
       render(opts) {
         return `for(${this.iteration})` + super.render(opts);
       }
-      optimizeNames(names2, constants) {
-        if (!super.optimizeNames(names2, constants))
+      optimizeNames(names2, constants2) {
+        if (!super.optimizeNames(names2, constants2))
           return;
-        this.iteration = optimizeExpr(this.iteration, names2, constants);
+        this.iteration = optimizeExpr(this.iteration, names2, constants2);
         return this;
       }
       get names() {
@@ -653,10 +653,10 @@ var require_codegen = __commonJS({
       render(opts) {
         return `for(${this.varKind} ${this.name} ${this.loop} ${this.iterable})` + super.render(opts);
       }
-      optimizeNames(names2, constants) {
-        if (!super.optimizeNames(names2, constants))
+      optimizeNames(names2, constants2) {
+        if (!super.optimizeNames(names2, constants2))
           return;
-        this.iterable = optimizeExpr(this.iterable, names2, constants);
+        this.iterable = optimizeExpr(this.iterable, names2, constants2);
         return this;
       }
       get names() {
@@ -698,11 +698,11 @@ var require_codegen = __commonJS({
         (_b2 = this.finally) === null || _b2 === void 0 ? void 0 : _b2.optimizeNodes();
         return this;
       }
-      optimizeNames(names2, constants) {
+      optimizeNames(names2, constants2) {
         var _a2, _b2;
-        super.optimizeNames(names2, constants);
-        (_a2 = this.catch) === null || _a2 === void 0 ? void 0 : _a2.optimizeNames(names2, constants);
-        (_b2 = this.finally) === null || _b2 === void 0 ? void 0 : _b2.optimizeNames(names2, constants);
+        super.optimizeNames(names2, constants2);
+        (_a2 = this.catch) === null || _a2 === void 0 ? void 0 : _a2.optimizeNames(names2, constants2);
+        (_b2 = this.finally) === null || _b2 === void 0 ? void 0 : _b2.optimizeNames(names2, constants2);
         return this;
       }
       get names() {
@@ -1003,7 +1003,7 @@ var require_codegen = __commonJS({
     function addExprNames(names2, from) {
       return from instanceof code_1._CodeOrName ? addNames(names2, from.names) : names2;
     }
-    function optimizeExpr(expr, names2, constants) {
+    function optimizeExpr(expr, names2, constants2) {
       if (expr instanceof code_1.Name)
         return replaceName(expr);
       if (!canOptimize(expr))
@@ -1018,14 +1018,14 @@ var require_codegen = __commonJS({
         return items;
       }, []));
       function replaceName(n) {
-        const c = constants[n.str];
+        const c = constants2[n.str];
         if (c === void 0 || names2[n.str] !== 1)
           return n;
         delete names2[n.str];
         return c;
       }
       function canOptimize(e) {
-        return e instanceof code_1._Code && e._items.some((c) => c instanceof code_1.Name && names2[c.str] === 1 && constants[c.str] !== void 0);
+        return e instanceof code_1._Code && e._items.some((c) => c instanceof code_1.Name && names2[c.str] === 1 && constants2[c.str] !== void 0);
       }
     }
     function subtractNames(names2, from) {
@@ -2987,7 +2987,7 @@ var require_compile = __commonJS({
       const schOrFunc = root.refs[ref];
       if (schOrFunc)
         return schOrFunc;
-      let _sch = resolve6.call(this, root, ref);
+      let _sch = resolve8.call(this, root, ref);
       if (_sch === void 0) {
         const schema = (_a2 = root.localRefs) === null || _a2 === void 0 ? void 0 : _a2[ref];
         const { schemaId } = this.opts;
@@ -3014,7 +3014,7 @@ var require_compile = __commonJS({
     function sameSchemaEnv(s1, s2) {
       return s1.schema === s2.schema && s1.root === s2.root && s1.baseId === s2.baseId;
     }
-    function resolve6(root, ref) {
+    function resolve8(root, ref) {
       let sch;
       while (typeof (sch = this.refs[ref]) == "string")
         ref = sch;
@@ -3878,7 +3878,7 @@ var require_fast_uri = __commonJS({
       }
       return uri;
     }
-    function resolve6(baseURI, relativeURI, options) {
+    function resolve8(baseURI, relativeURI, options) {
       const schemelessOptions = options ? Object.assign({ scheme: "null" }, options) : { scheme: "null" };
       const {
         parsed: baseParsed,
@@ -3914,50 +3914,50 @@ var require_fast_uri = __commonJS({
       schemelessOptions.skipEscape = true;
       return serialize2(resolved, schemelessOptions);
     }
-    function resolveComponent(base, relative3, options, skipNormalization) {
+    function resolveComponent(base, relative4, options, skipNormalization) {
       const target = {};
       if (!skipNormalization) {
         base = parse3(serialize2(base, options), options);
-        relative3 = parse3(serialize2(relative3, options), options);
+        relative4 = parse3(serialize2(relative4, options), options);
       }
       options = options || {};
-      if (!options.tolerant && relative3.scheme) {
-        target.scheme = relative3.scheme;
-        target.userinfo = relative3.userinfo;
-        target.host = relative3.host;
-        target.port = relative3.port;
-        target.path = removeDotSegments(relative3.path || "");
-        target.query = relative3.query;
+      if (!options.tolerant && relative4.scheme) {
+        target.scheme = relative4.scheme;
+        target.userinfo = relative4.userinfo;
+        target.host = relative4.host;
+        target.port = relative4.port;
+        target.path = removeDotSegments(relative4.path || "");
+        target.query = relative4.query;
       } else {
-        if (relative3.userinfo !== void 0 || relative3.host !== void 0 || relative3.port !== void 0) {
-          target.userinfo = relative3.userinfo;
-          target.host = relative3.host;
-          target.port = relative3.port;
-          target.path = removeDotSegments(relative3.path || "");
-          target.query = relative3.query;
+        if (relative4.userinfo !== void 0 || relative4.host !== void 0 || relative4.port !== void 0) {
+          target.userinfo = relative4.userinfo;
+          target.host = relative4.host;
+          target.port = relative4.port;
+          target.path = removeDotSegments(relative4.path || "");
+          target.query = relative4.query;
         } else {
-          if (!relative3.path) {
+          if (!relative4.path) {
             target.path = base.path;
-            if (relative3.query !== void 0) {
-              target.query = relative3.query;
+            if (relative4.query !== void 0) {
+              target.query = relative4.query;
             } else {
               target.query = base.query;
             }
           } else {
-            if (relative3.path[0] === "/") {
-              target.path = removeDotSegments(relative3.path);
+            if (relative4.path[0] === "/") {
+              target.path = removeDotSegments(relative4.path);
             } else {
               const baseHasAuthority = base.userinfo !== void 0 || base.host !== void 0 || base.port !== void 0;
               if (baseHasAuthority && !base.path) {
-                target.path = "/" + relative3.path;
+                target.path = "/" + relative4.path;
               } else if (!base.path) {
-                target.path = relative3.path;
+                target.path = relative4.path;
               } else {
-                target.path = base.path.slice(0, base.path.lastIndexOf("/") + 1) + relative3.path;
+                target.path = base.path.slice(0, base.path.lastIndexOf("/") + 1) + relative4.path;
               }
               target.path = base.scheme === void 0 && !baseHasAuthority && target.path[0] !== "/" ? removeDotSegmentsRelative(target.path) : removeDotSegments(target.path);
             }
-            target.query = relative3.query;
+            target.query = relative4.query;
           }
           target.userinfo = base.userinfo;
           target.host = base.host;
@@ -3965,7 +3965,7 @@ var require_fast_uri = __commonJS({
         }
         target.scheme = base.scheme;
       }
-      target.fragment = relative3.fragment;
+      target.fragment = relative4.fragment;
       return target;
     }
     function equal(uriA, uriB, options) {
@@ -4269,7 +4269,7 @@ var require_fast_uri = __commonJS({
     var fastUri = {
       SCHEMES,
       normalize,
-      resolve: resolve6,
+      resolve: resolve8,
       resolveComponent,
       equal,
       serialize: serialize2,
@@ -8684,28 +8684,28 @@ var require_jstat = __commonJS({
           var distinctNumbers = [];
           var numberCounts = {};
           for (i2 = 0; i2 < arr.length; i2++) {
-            var number2 = arr[i2];
-            if (numberCounts[number2]) {
-              numberCounts[number2]++;
+            var number = arr[i2];
+            if (numberCounts[number]) {
+              numberCounts[number]++;
             } else {
-              numberCounts[number2] = 1;
-              distinctNumbers.push(number2);
+              numberCounts[number] = 1;
+              distinctNumbers.push(number);
             }
           }
           var sortedDistinctNumbers = distinctNumbers.sort(ascNum);
           var numberRanks = {};
           var currentRank = 1;
           for (i2 = 0; i2 < sortedDistinctNumbers.length; i2++) {
-            var number2 = sortedDistinctNumbers[i2];
-            var count2 = numberCounts[number2];
+            var number = sortedDistinctNumbers[i2];
+            var count2 = numberCounts[number];
             var first = currentRank;
             var last = currentRank + count2 - 1;
             var rank = (first + last) / 2;
-            numberRanks[number2] = rank;
+            numberRanks[number] = rank;
             currentRank += count2;
           }
-          return arr.map(function(number3) {
-            return numberRanks[number3];
+          return arr.map(function(number2) {
+            return numberRanks[number2];
           });
         };
         jStat4.mode = function mode(arr) {
@@ -19716,8 +19716,8 @@ var require_light = __commonJS({
           return this.Promise.resolve();
         }
         yieldLoop(t = 0) {
-          return new this.Promise(function(resolve6, reject) {
-            return setTimeout(resolve6, t);
+          return new this.Promise(function(resolve8, reject) {
+            return setTimeout(resolve8, t);
           });
         }
         computePenalty() {
@@ -19928,15 +19928,15 @@ var require_light = __commonJS({
           return this._queue.length === 0;
         }
         async _tryToRun() {
-          var args, cb, error, reject, resolve6, returned, task;
+          var args, cb, error, reject, resolve8, returned, task;
           if (this._running < 1 && this._queue.length > 0) {
             this._running++;
-            ({ task, args, resolve: resolve6, reject } = this._queue.shift());
+            ({ task, args, resolve: resolve8, reject } = this._queue.shift());
             cb = await (async function() {
               try {
                 returned = await task(...args);
                 return function() {
-                  return resolve6(returned);
+                  return resolve8(returned);
                 };
               } catch (error1) {
                 error = error1;
@@ -19951,13 +19951,13 @@ var require_light = __commonJS({
           }
         }
         schedule(task, ...args) {
-          var promise, reject, resolve6;
-          resolve6 = reject = null;
+          var promise, reject, resolve8;
+          resolve8 = reject = null;
           promise = new this.Promise(function(_resolve, _reject) {
-            resolve6 = _resolve;
+            resolve8 = _resolve;
             return reject = _reject;
           });
-          this._queue.push({ task, args, resolve: resolve6, reject });
+          this._queue.push({ task, args, resolve: resolve8, reject });
           this._tryToRun();
           return promise;
         }
@@ -20358,14 +20358,14 @@ var require_light = __commonJS({
                 counts = this._states.counts;
                 return counts[0] + counts[1] + counts[2] + counts[3] === at;
               };
-              return new this.Promise((resolve6, reject) => {
+              return new this.Promise((resolve8, reject) => {
                 if (finished()) {
-                  return resolve6();
+                  return resolve8();
                 } else {
                   return this.on("done", () => {
                     if (finished()) {
                       this.removeAllListeners("done");
-                      return resolve6();
+                      return resolve8();
                     }
                   });
                 }
@@ -20458,9 +20458,9 @@ var require_light = __commonJS({
               options = parser$5.load(options, this.jobDefaults);
             }
             task = (...args2) => {
-              return new this.Promise(function(resolve6, reject) {
+              return new this.Promise(function(resolve8, reject) {
                 return fn(...args2, function(...args3) {
-                  return (args3[0] != null ? reject : resolve6)(args3);
+                  return (args3[0] != null ? reject : resolve8)(args3);
                 });
               });
             };
@@ -21454,7 +21454,6 @@ var require_cli_progress = __commonJS({
 });
 
 // src/entries/cli.ts
-import { writeFile as writeFile2 } from "node:fs/promises";
 import { fileURLToPath } from "node:url";
 
 // src/model/errors.ts
@@ -21506,11 +21505,11 @@ var UsageError = class extends Error {
 
 // src/entries/cli/audit.ts
 import { tmpdir } from "node:os";
-import { resolve as resolve3 } from "node:path";
+import { resolve as resolve4 } from "node:path";
 
 // src/io/audit-github.ts
 import { mkdtemp, rm } from "node:fs/promises";
-import { join as join3 } from "node:path";
+import { join as join2 } from "node:path";
 
 // src/io/github/artifacts.ts
 import { posix } from "node:path";
@@ -22022,8 +22021,16 @@ function readEntry(zip, entry, budget, label) {
     `more while inflating ${JSON.stringify(entry.name)}`,
     'Raise "archive-limit-mb" if the archive is genuine.'
   );
+  const corrupt = (detail) => refuse(
+    label,
+    `must hold readable data in ${JSON.stringify(entry.name)}`,
+    detail,
+    "The archive is damaged; upload it again."
+  );
   if (entry.method === 0) {
     if (data.length > budget.remaining) over();
+    if (data.length !== entry.size || data.length !== entry.compressedSize)
+      corrupt(`${data.length} stored bytes where its directory says ${entry.size}`);
     budget.remaining -= data.length;
     return data.slice();
   }
@@ -22037,10 +22044,15 @@ function readEntry(zip, entry, budget, label) {
     chunks.push(chunk);
   });
   const step = 64 * 1024;
-  for (let i2 = 0; i2 < data.length; i2 += step) {
-    inflater.push(data.subarray(i2, i2 + step), i2 + step >= data.length);
+  try {
+    for (let i2 = 0; i2 < data.length; i2 += step) {
+      inflater.push(data.subarray(i2, i2 + step), i2 + step >= data.length);
+    }
+    if (data.length === 0) inflater.push(new Uint8Array(0), true);
+  } catch (error) {
+    if (error instanceof InputError) throw error;
+    corrupt(`invalid deflate data (${error instanceof Error ? error.message : String(error)})`);
   }
-  if (data.length === 0) inflater.push(new Uint8Array(0), true);
   if (total !== entry.size) {
     refuse(
       label,
@@ -22155,12 +22167,123 @@ function predictionsEntry(runBytes, runName, entries) {
 // src/io/audit-side.ts
 import { createHash as createHash2 } from "node:crypto";
 import { mkdir, writeFile } from "node:fs/promises";
-import { dirname as dirname2, join, posix as posix2 } from "node:path";
+import { dirname as dirname3, join, posix as posix2 } from "node:path";
 
 // src/io/load-run.ts
 import { createHash } from "node:crypto";
-import { readFile, stat } from "node:fs/promises";
-import { dirname, relative, resolve, sep } from "node:path";
+import { lstat } from "node:fs/promises";
+import { dirname as dirname2, relative as relative2, resolve as resolve2, sep } from "node:path";
+
+// src/model/limits.ts
+var MAX_MAGNITUDE = 1e15;
+var MAX_CURVE_POINTS = 1e4;
+var MAX_JSON_DEPTH = 64;
+function formatLimit(value2) {
+  if (value2 !== 0 && (Math.abs(value2) >= 1e6 || Math.abs(value2) < 1e-6))
+    return value2.toExponential().replace("e+", "e");
+  return String(value2);
+}
+
+// src/model/settings.ts
+var FAIL_ON_VALUES = [
+  "worse-validation",
+  "toward-overfitting",
+  "toward-underfitting",
+  "worse-on-both",
+  "any-movement",
+  "slice-regression",
+  "high-bias",
+  "high-variance",
+  "data-mismatch",
+  "validation-overfit",
+  "guardrail-regression",
+  "guardrail-undetermined",
+  "none"
+];
+var COST_OUTCOME_FIELDS = /* @__PURE__ */ new Map([
+  ["train-seconds", "trainSeconds"],
+  ["inference-ms", "inferenceMs"],
+  ["parameters", "parameters"],
+  ["memory-mb", "memoryMb"]
+]);
+var COST_RATIO_OUTCOME = /^(train-seconds|inference-ms|parameters|memory-mb)-ratio>((?:0|[1-9][0-9]*)(?:\.[0-9]+)?)$/;
+function isFailOn(value2) {
+  return FAIL_ON_VALUES.includes(value2) || COST_RATIO_OUTCOME.test(value2);
+}
+var DEFAULT_SETTINGS = {
+  alpha: 0.05,
+  minEffect: 0,
+  gapTolerance: 0.1,
+  failOn: ["worse-validation"]
+};
+var NUMBER_SETTINGS = {
+  alpha: { min: 1e-6, max: 0.5, about: "significance level" },
+  "min-effect": { min: 0, max: MAX_MAGNITUDE, about: "smallest change that counts" },
+  "gap-tolerance": { min: 0, max: 1, about: "component present at this fraction of the error" },
+  reference: { min: -MAX_MAGNITUDE, max: MAX_MAGNITUDE, about: "reference level" }
+};
+var DECIMAL = /^[+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:[eE][+-]?\d+)?$/;
+function parseDecimal(text3) {
+  const trimmed = text3.trim();
+  if (!DECIMAL.test(trimmed)) return null;
+  const value2 = Number(trimmed);
+  return Number.isFinite(value2) ? value2 : null;
+}
+function rangeText(name) {
+  const { min, max: max2 } = NUMBER_SETTINGS[name];
+  return `must be a number from ${formatLimit(min)} to ${formatLimit(max2)}`;
+}
+function numberSettingIssues(name, value2, source) {
+  const { min, max: max2 } = NUMBER_SETTINGS[name];
+  if (Number.isFinite(value2) && value2 >= min && value2 <= max2) return [];
+  return [{ ...source, expected: rangeText(name), got: quote(value2) }];
+}
+function parseNumberSetting(name, text3, source) {
+  const value2 = parseDecimal(text3);
+  if (value2 === null)
+    return { issues: [{ ...source, expected: rangeText(name), got: quote(text3) }] };
+  const issues = numberSettingIssues(name, value2, source);
+  return issues.length > 0 ? { issues } : { value: value2 };
+}
+var FAIL_ON_SEPARATORS = /[,\n]/;
+function failOnIssues(values, source) {
+  const at = (i2) => source.pointer === "" ? "" : `${source.pointer}/${i2}`;
+  if (values.length === 0) {
+    return [
+      {
+        ...source,
+        expected: "must name at least one outcome",
+        got: "an empty list",
+        hint: "Write 'none' for a gate that never fails, or leave the setting out for the default (worse-validation)."
+      }
+    ];
+  }
+  const issues = values.flatMap(
+    (value2, i2) => isFailOn(value2) ? [] : [
+      {
+        ...source,
+        pointer: at(i2),
+        expected: `must be one of ${FAIL_ON_VALUES.join(", ")}, or FIELD-ratio>X (FIELD one of ${[...COST_OUTCOME_FIELDS.keys()].join(", ")})`,
+        got: quote(value2),
+        hint: "Separate outcomes with commas or new lines."
+      }
+    ]
+  );
+  if (issues.length === 0 && values.length > 1 && values.includes("none")) {
+    issues.push({
+      ...source,
+      pointer: at(values.indexOf("none")),
+      expected: "must not combine 'none' with other outcomes",
+      got: quote(values.join(","))
+    });
+  }
+  return issues;
+}
+function parseFailOn(text3, source) {
+  const values = text3.split(FAIL_ON_SEPARATORS).map((s) => s.trim()).filter((s) => s !== "");
+  const issues = failOnIssues(values, source);
+  return issues.length > 0 ? { issues } : { value: values };
+}
 
 // src/artifact/epoch-log.ts
 function splitCsvLine(line) {
@@ -22169,6 +22292,22 @@ function splitCsvLine(line) {
 function parseEpochLog(text3, file, mapping) {
   const lines = text3.replace(/^\uFEFF/, "").split(/\r?\n/);
   const header = splitCsvLine(lines[0] ?? "");
+  const seen = /* @__PURE__ */ new Map();
+  header.forEach((name, i2) => {
+    const first = seen.get(name);
+    if (first !== void 0) {
+      throw new InputError([
+        {
+          file,
+          pointer: "line 1",
+          expected: `must name each column once (column ${i2 + 1} repeats column ${first + 1})`,
+          got: quote(name),
+          hint: "Rename one of the columns; a repeated name makes the mapping ambiguous."
+        }
+      ]);
+    }
+    seen.set(name, i2);
+  });
   const column = (name, role) => {
     if (name === void 0) return void 0;
     const index = header.indexOf(name);
@@ -22196,14 +22335,15 @@ function parseEpochLog(text3, file, mapping) {
     const cells = splitCsvLine(raw);
     const read = (index, name) => {
       const cell = cells[index] ?? "";
-      const value2 = cell === "" ? Number.NaN : Number(cell);
-      if (!Number.isFinite(value2)) {
+      const value2 = parseDecimal(cell) ?? Number.NaN;
+      if (!Number.isFinite(value2) || Math.abs(value2) > MAX_MAGNITUDE) {
         issues.push({
           file,
           pointer: `line ${i2 + 1}`,
-          expected: `column "${name}" must be a finite number`,
+          expected: `column "${name}" must be a decimal number within \xB1${formatLimit(MAX_MAGNITUDE)}`,
           got: quote(cell)
         });
+        return Number.NaN;
       }
       return value2;
     };
@@ -22220,11 +22360,133 @@ function parseEpochLog(text3, file, mapping) {
     }
     points2.push(point);
     if (issues.length >= 10) break;
+    if (points2.length > MAX_CURVE_POINTS) {
+      issues.push({
+        file,
+        pointer: `line ${i2 + 1}`,
+        expected: `must have at most ${MAX_CURVE_POINTS} data rows (a curve's limit)`,
+        hint: "Log less often, or keep every n-th row."
+      });
+      break;
+    }
   }
   if (issues.length > 0) throw new InputError(issues);
   if (points2.length === 0)
     throw new InputError([{ file, pointer: "", expected: "has no data rows under its header" }]);
   return points2;
+}
+
+// src/validate/ajv-issues.ts
+function valueAt(doc, pointer) {
+  if (pointer === "") return doc;
+  let node = doc;
+  for (const raw of pointer.slice(1).split("/")) {
+    const key = raw.replace(/~1/g, "/").replace(/~0/g, "~");
+    if (node === null || typeof node !== "object") return void 0;
+    node = node[key];
+  }
+  return node;
+}
+function escapePointerToken(token) {
+  return token.replace(/~/g, "~0").replace(/\//g, "~1");
+}
+function typeName(value2) {
+  if (value2 === null) return "null";
+  if (Array.isArray(value2)) return "an array";
+  if (typeof value2 === "object") return "an object";
+  return `${typeof value2} ${quote(value2)}`;
+}
+function oneIssue(error, file, doc) {
+  const pointer = error.instancePath;
+  const value2 = valueAt(doc, pointer);
+  const params = error.params;
+  switch (error.keyword) {
+    case "required":
+      return {
+        file,
+        pointer: pointer === "" ? "/" : pointer,
+        expected: `must have the key "${String(params["missingProperty"])}"`,
+        hint: "Add it; see schema/fitgap-run-1.schema.json for the format."
+      };
+    case "additionalProperties": {
+      const key = String(params["additionalProperty"]);
+      return {
+        file,
+        pointer: `${pointer}/${escapePointerToken(key)}`,
+        expected: "is not a known key",
+        hint: "Check the spelling; unknown keys are rejected so that a typo cannot pass silently."
+      };
+    }
+    case "type":
+      return {
+        file,
+        pointer,
+        expected: `must be ${String(params["type"]) === "integer" ? "an integer" : `of type ${String(params["type"])}`}`,
+        got: typeName(value2),
+        ...params["type"] === "number" && typeof value2 === "string" ? { hint: "Write numbers without quotes." } : {}
+      };
+    case "enum":
+      return {
+        file,
+        pointer,
+        expected: `must be one of ${params["allowedValues"].map((v) => quote(v)).join(", ")}`,
+        got: quote(value2)
+      };
+    case "const":
+      return {
+        file,
+        pointer,
+        expected: `must be ${quote(params["allowedValue"])}`,
+        got: quote(value2)
+      };
+    case "format":
+      return {
+        file,
+        pointer,
+        expected: `must be a ${String(params["format"])} string`,
+        got: quote(value2),
+        ...params["format"] === "date-time" ? { hint: 'Use RFC 3339, e.g. "2026-11-30T10:00:00Z".' } : {}
+      };
+    default:
+      return {
+        file,
+        pointer,
+        expected: error.message ?? `fails ${error.keyword}`,
+        got: quote(value2)
+      };
+  }
+}
+function ajvIssues(errors, file, doc) {
+  const seen = /* @__PURE__ */ new Set();
+  const issues = [];
+  for (const error of errors) {
+    const issue = oneIssue(error, file, doc);
+    const key = `${issue.pointer}|${issue.expected}`;
+    if (seen.has(key)) continue;
+    seen.add(key);
+    issues.push(issue);
+  }
+  return issues;
+}
+function outOfRangeNumbers(doc, maxMagnitude, max2 = 10) {
+  const found = [];
+  const stack = [[doc, ""]];
+  while (stack.length > 0 && found.length < max2) {
+    const [node, pointer] = stack.pop();
+    if (typeof node === "number") {
+      if (!Number.isFinite(node) || Math.abs(node) > maxMagnitude)
+        found.push({ pointer, value: node });
+    } else if (Array.isArray(node)) {
+      for (let i2 = node.length - 1; i2 >= 0; i2--) stack.push([node[i2], `${pointer}/${i2}`]);
+    } else if (node !== null && typeof node === "object") {
+      const entries = Object.entries(node);
+      for (let i2 = entries.length - 1; i2 >= 0; i2--) {
+        const [k, v] = entries[i2];
+        stack.push([v, `${pointer}/${escapePointerToken(k)}`]);
+      }
+    }
+  }
+  return found;
 }
 
 // src/artifact/read-json.ts
@@ -22250,13 +22512,79 @@ function errorOffset(text3, message) {
   }
   return null;
 }
-function parseJson(text3, file) {
+var QUOTE = 34;
+var BACKSLASH = 92;
+function decodeKey(raw) {
+  if (!raw.includes("\\")) return raw;
   try {
-    return JSON.parse(text3.charCodeAt(0) === 65279 ? text3.slice(1) : text3);
+    return JSON.parse(`"${raw}"`);
+  } catch {
+    return null;
+  }
+}
+function scanStructure(text3, maxDepth = MAX_JSON_DEPTH) {
+  const stack = [];
+  const duplicates = [];
+  const pointer = () => stack.slice(0, -1).map((f) => `/${f.object ? escapePointerToken(f.at) : String(f.index)}`).join("");
+  for (let i2 = 0; i2 < text3.length; i2++) {
+    const c = text3.charCodeAt(i2);
+    if (c === QUOTE) {
+      const start = i2 + 1;
+      i2++;
+      while (i2 < text3.length && text3.charCodeAt(i2) !== QUOTE) {
+        if (text3.charCodeAt(i2) === BACKSLASH) i2++;
+        i2++;
+      }
+      const top = stack[stack.length - 1];
+      if (top?.object === true && top.expectKey) {
+        const key = decodeKey(text3.slice(start, i2));
+        top.expectKey = false;
+        if (key !== null) {
+          top.at = key;
+          if (top.keys.has(key) && duplicates.length < 10) {
+            duplicates.push({ pointer: `${pointer()}/${escapePointerToken(key)}`, key });
+          }
+          top.keys.add(key);
+        }
+      }
+      continue;
+    }
+    if (c === 123 || c === 91) {
+      if (stack.length >= maxDepth) return { tooDeep: i2, duplicates };
+      stack.push({ object: c === 123, keys: /* @__PURE__ */ new Set(), at: "", index: 0, expectKey: c === 123 });
+    } else if (c === 125 || c === 93) {
+      stack.pop();
+    } else if (c === 44) {
+      const top = stack[stack.length - 1];
+      if (top !== void 0) {
+        if (top.object) top.expectKey = true;
+        else top.index++;
+      }
+    }
+  }
+  return { tooDeep: -1, duplicates };
+}
+function parseJson(text3, file) {
+  const body = text3.charCodeAt(0) === 65279 ? text3.slice(1) : text3;
+  const structure = scanStructure(body);
+  if (structure.tooDeep >= 0) {
+    const where = lineAndColumn(body, structure.tooDeep);
+    throw new InputError([
+      {
+        file,
+        pointer: `line ${where.line}, column ${where.column}`,
+        expected: `must not nest arrays and objects more than ${MAX_JSON_DEPTH} levels deep`,
+        hint: "A run artifact nests about five levels; flatten deep hyperparameter values."
+      }
+    ]);
+  }
+  let doc;
+  try {
+    doc = JSON.parse(body);
   } catch (error) {
     const message = error instanceof Error ? error.message : String(error);
-    const offset = errorOffset(text3, message);
-    const where = offset === null ? void 0 : lineAndColumn(text3, offset);
+    const offset = errorOffset(body, message);
+    const where = offset === null ? void 0 : lineAndColumn(body, offset);
     throw new InputError([
       {
         file,
@@ -22267,6 +22595,18 @@ function parseJson(text3, file) {
       }
     ]);
   }
+  if (structure.duplicates.length > 0) {
+    throw new InputError(
+      structure.duplicates.map(({ pointer, key }) => ({
+        file,
+        pointer,
+        expected: "must appear once in its object",
+        got: `the key ${quote(key)} again`,
+        hint: "JSON keeps only the last of duplicate keys; remove the one you did not mean."
+      }))
+    );
+  }
+  return doc;
 }
 
 // src/validate/run.ts
@@ -22585,110 +22925,6 @@ var fitgap_run_1_schema_default = {
   }
 };
 
-// src/validate/ajv-issues.ts
-function valueAt(doc, pointer) {
-  if (pointer === "") return doc;
-  let node = doc;
-  for (const raw of pointer.slice(1).split("/")) {
-    const key = raw.replace(/~1/g, "/").replace(/~0/g, "~");
-    if (node === null || typeof node !== "object") return void 0;
-    node = node[key];
-  }
-  return node;
-}
-function escapePointerToken(token) {
-  return token.replace(/~/g, "~0").replace(/\//g, "~1");
-}
-function typeName(value2) {
-  if (value2 === null) return "null";
-  if (Array.isArray(value2)) return "an array";
-  if (typeof value2 === "object") return "an object";
-  return `${typeof value2} ${quote(value2)}`;
-}
-function oneIssue(error, file, doc) {
-  const pointer = error.instancePath;
-  const value2 = valueAt(doc, pointer);
-  const params = error.params;
-  switch (error.keyword) {
-    case "required":
-      return {
-        file,
-        pointer: pointer === "" ? "/" : pointer,
-        expected: `must have the key "${String(params["missingProperty"])}"`,
-        hint: "Add it; see schema/fitgap-run-1.schema.json for the format."
-      };
-    case "additionalProperties": {
-      const key = String(params["additionalProperty"]);
-      return {
-        file,
-        pointer: `${pointer}/${escapePointerToken(key)}`,
-        expected: "is not a known key",
-        hint: "Check the spelling; unknown keys are rejected so that a typo cannot pass silently."
-      };
-    }
-    case "type":
-      return {
-        file,
-        pointer,
-        expected: `must be ${String(params["type"]) === "integer" ? "an integer" : `of type ${String(params["type"])}`}`,
-        got: typeName(value2),
-        ...params["type"] === "number" && typeof value2 === "string" ? { hint: "Write numbers without quotes." } : {}
-      };
-    case "enum":
-      return {
-        file,
-        pointer,
-        expected: `must be one of ${params["allowedValues"].map((v) => quote(v)).join(", ")}`,
-        got: quote(value2)
-      };
-    case "const":
-      return {
-        file,
-        pointer,
-        expected: `must be ${quote(params["allowedValue"])}`,
-        got: quote(value2)
-      };
-    case "format":
-      return {
-        file,
-        pointer,
-        expected: `must be a ${String(params["format"])} string`,
-        got: quote(value2),
-        ...params["format"] === "date-time" ? { hint: 'Use RFC 3339, e.g. "2026-11-30T10:00:00Z".' } : {}
-      };
-    default:
-      return {
-        file,
-        pointer,
-        expected: error.message ?? `fails ${error.keyword}`,
-        got: quote(value2)
-      };
-  }
-}
-function ajvIssues(errors, file, doc) {
-  const seen = /* @__PURE__ */ new Set();
-  const issues = [];
-  for (const error of errors) {
-    const issue = oneIssue(error, file, doc);
-    const key = `${issue.pointer}|${issue.expected}`;
-    if (seen.has(key)) continue;
-    seen.add(key);
-    issues.push(issue);
-  }
-  return issues;
-}
-function nonFiniteNumbers(doc, pointer = "") {
-  if (typeof doc === "number") return Number.isFinite(doc) ? [] : [pointer];
-  if (Array.isArray(doc))
-    return doc.flatMap((item, i2) => nonFiniteNumbers(item, `${pointer}/${i2}`));
-  if (doc !== null && typeof doc === "object") {
-    return Object.entries(doc).flatMap(
-      ([k, v]) => nonFiniteNumbers(v, `${pointer}/${escapePointerToken(k)}`)
-    );
-  }
-  return [];
-}
-
 // src/validate/guardrails.ts
 function guardrailIssues(run, file) {
   const issues = [];
@@ -22785,6 +23021,16 @@ function semanticIssues(run, file) {
   for (const name of CURVE_NAMES) {
     const curve = run.curves?.[name];
     if (curve === void 0) continue;
+    if (curve.length > MAX_CURVE_POINTS) {
+      issues.push({
+        file,
+        pointer: `/curves/${name}`,
+        expected: `must have at most ${MAX_CURVE_POINTS} points`,
+        got: `${curve.length} points`,
+        hint: "Log the curve less often, or keep every n-th point before writing the artifact."
+      });
+      continue;
+    }
     curve.forEach((point, i2) => {
       const at = `/curves/${name}/${i2}`;
       inUnit(point.validation, `${at}/validation`);
@@ -22850,16 +23096,24 @@ function semanticIssues(run, file) {
   return issues;
 }
 function validateRun(doc, file) {
-  const nonFinite = nonFiniteNumbers(doc);
-  if (nonFinite.length > 0) {
+  const numbers = outOfRangeNumbers(doc, MAX_MAGNITUDE);
+  if (numbers.length > 0) {
     throw new InputError(
-      nonFinite.map((pointer) => ({
-        file,
-        pointer,
-        expected: "must be a finite number",
-        got: "a number too large to represent (Infinity)",
-        hint: "Write the measured value; JSON numbers such as 1e999 overflow."
-      }))
+      numbers.map(
+        ({ pointer, value: value2 }) => Number.isFinite(value2) ? {
+          file,
+          pointer,
+          expected: `must be within \xB1${formatLimit(MAX_MAGNITUDE)}`,
+          got: quote(value2),
+          hint: pointer.startsWith("/hyperparameters/") ? "Write large identifiers (seeds, hashes) as strings." : "Rescale the metric (thousands instead of units); larger values overflow in the statistics."
+        } : {
+          file,
+          pointer,
+          expected: "must be a finite number",
+          got: "a number too large to represent (Infinity)",
+          hint: "Write the measured value; JSON numbers such as 1e999 overflow."
+        }
+      )
     );
   }
   const validate = validator();
@@ -22871,38 +23125,298 @@ function validateRun(doc, file) {
   return doc;
 }
 
-// src/io/load-run.ts
-async function readText(path, file, what) {
-  try {
-    return await readFile(path);
-  } catch (error) {
-    const code2 = error.code;
-    throw new InputError([
-      {
-        file,
-        pointer: "",
-        expected: `could not be read as ${what}`,
-        got: code2 === "ENOENT" ? "no such file" : code2 === "EISDIR" ? "a directory" : code2 ?? String(error),
-        hint: "Check the path."
-      }
-    ]);
+// src/io/open-untrusted.ts
+import { constants } from "node:fs";
+import { open, realpath } from "node:fs/promises";
+import { Readable } from "node:stream";
+import { dirname, isAbsolute, relative, resolve } from "node:path";
+var MIB = 1024 * 1024;
+var DEFAULT_FILE_LIMITS = {
+  artifactBytes: 16 * MIB,
+  configBytes: 1 * MIB,
+  csvBytes: 512 * MIB
+};
+var LIMIT_NAMES = {
+  artifactBytes: { option: "max-artifact-mb", config: "artifact-mb" },
+  configBytes: { option: "max-config-mb", config: null },
+  csvBytes: { option: "max-csv-mb", config: "csv-mb" }
+};
+var LIMIT_RANGES_MB = {
+  artifactBytes: { min: 1e-3, max: 1024 },
+  configBytes: { min: 1e-3, max: 64 },
+  csvBytes: { min: 1e-3, max: 65536 }
+};
+function parseLimitMb(key, text3, label) {
+  const { min, max: max2 } = LIMIT_RANGES_MB[key];
+  const value2 = /^\s*(?:\d+(?:\.\d*)?|\.\d+)\s*$/.test(text3) ? Number(text3) : Number.NaN;
+  if (!(value2 >= min && value2 <= max2)) {
+    return {
+      issues: [
+        {
+          file: label,
+          pointer: "",
+          expected: `must be a number of MB from ${min} to ${max2}`,
+          got: JSON.stringify(text3)
+        }
+      ]
+    };
+  }
+  return { bytes: Math.round(value2 * MIB) };
+}
+var LIMIT_HINTS = {
+  artifactBytes: 'Raise the limit with --max-artifact-mb (action input "max-artifact-mb", config limits.artifact-mb) if the file is genuine.',
+  configBytes: 'Raise the limit with --max-config-mb (action input "max-config-mb") if the file is genuine.',
+  csvBytes: 'Raise the limit with --max-csv-mb (action input "max-csv-mb", config limits.csv-mb) if the file is genuine.'
+};
+var READ_CHUNK = 64 * 1024;
+var MissingFileError = class extends InputError {
+};
+function refuse2(target, expected, got, hint) {
+  const issue = { file: target.file, pointer: "", expected };
+  if (got !== void 0) issue.got = got;
+  if (hint !== void 0) issue.hint = hint;
+  throw new InputError([issue]);
+}
+function describeCode(code2) {
+  switch (code2) {
+    case "ENOENT":
+      return "no such file";
+    case "EACCES":
+    case "EPERM":
+      return "permission denied";
+    case "ELOOP":
+      return "a symbolic link where none may be (or a loop of links)";
+    case "EISDIR":
+      return "a folder";
+    case "ENOTDIR":
+      return "a path through something that is not a folder";
+    case "ENXIO":
+      return "a socket or a device without a reader";
+    case "ENAMETOOLONG":
+      return "a name too long for the file system";
+    case "EIO":
+      return "an input/output error";
+    case "EMFILE":
+    case "ENFILE":
+      return "too many open files";
+    default:
+      return code2 ?? "an unknown error";
   }
 }
+function errorCode(error) {
+  return error?.code;
+}
+function isInside(folder, path) {
+  const rel = relative(folder, path);
+  return rel !== "" && !rel.startsWith("..") && !isAbsolute(rel);
+}
+function kindOf(stats) {
+  if (stats.isDirectory()) return "a folder";
+  if (stats.isFIFO()) return "a named pipe (FIFO)";
+  if (stats.isSocket()) return "a socket";
+  if (stats.isCharacterDevice() || stats.isBlockDevice()) return "a device";
+  if (stats.isSymbolicLink()) return "a symbolic link";
+  return "not a regular file";
+}
+var MB = (bytes) => `${Math.round(bytes / MIB * 1e3) / 1e3} MB`;
+async function openChecked(target) {
+  const path = resolve(target.path);
+  const where = `could not be read as ${target.what}`;
+  let folder;
+  let real;
+  try {
+    folder = await realpath(resolve(target.folder ?? dirname(path)));
+    real = await realpath(path);
+  } catch (error) {
+    const code2 = errorCode(error);
+    if (code2 === "ENOENT")
+      throw new MissingFileError([
+        {
+          file: target.file,
+          pointer: "",
+          expected: where,
+          got: "no such file",
+          hint: "Check the path."
+        }
+      ]);
+    refuse2(target, where, describeCode(code2), "Check the path.");
+  }
+  if (!isInside(folder, real)) {
+    refuse2(
+      target,
+      `must be a file inside ${target.folder === void 0 ? "the folder it is named in" : "the artifact's folder"}`,
+      "a link that leads outside it",
+      "Copy the file there instead of linking to it."
+    );
+  }
+  let handle;
+  try {
+    handle = await open(
+      real,
+      constants.O_RDONLY | constants.O_NOFOLLOW | constants.O_NONBLOCK | constants.O_NOCTTY
+    );
+  } catch (error) {
+    refuse2(target, where, describeCode(errorCode(error)), "Check the path and its permissions.");
+  }
+  try {
+    const stats = await handle.stat();
+    if (!stats.isFile()) refuse2(target, "must be a regular file", kindOf(stats));
+    const opened = await realpath(`/proc/self/fd/${handle.fd}`).catch(() => null);
+    if (opened !== null && opened !== real && !isInside(folder, opened)) {
+      refuse2(target, "must not change while it is opened", "a path that moved outside its folder");
+    }
+    const max2 = target.limits[target.limit];
+    if (stats.size > max2) {
+      refuse2(
+        target,
+        `must be at most ${MB(max2)} (${max2} bytes)`,
+        `${stats.size} bytes`,
+        LIMIT_HINTS[target.limit]
+      );
+    }
+    return { handle, size: stats.size, realPath: real, id: `${stats.dev}:${stats.ino}` };
+  } catch (error) {
+    await handle.close().catch(() => void 0);
+    throw error;
+  }
+}
+function grew(target) {
+  refuse2(
+    target,
+    "must be a regular file of fixed size",
+    "more bytes than its size promised",
+    "Files that change while read (logs being written, files under /proc) are refused; copy it first."
+  );
+}
+async function readAt(target, handle, buffer, at) {
+  try {
+    const { bytesRead } = await handle.read(buffer, 0, buffer.length, at);
+    return bytesRead;
+  } catch (error) {
+    refuse2(target, `could not be read as ${target.what}`, describeCode(errorCode(error)));
+  }
+}
+async function readChecked(target) {
+  const file = await openChecked(target);
+  try {
+    const bytes = Buffer.alloc(file.size);
+    let at = 0;
+    while (at < file.size) {
+      const n = await readAt(target, file.handle, bytes.subarray(at), at);
+      if (n === 0) break;
+      at += n;
+    }
+    if (await readAt(target, file.handle, Buffer.alloc(1), at) > 0) grew(target);
+    return { bytes: at === file.size ? bytes : bytes.subarray(0, at), file };
+  } finally {
+    await file.handle.close().catch(() => void 0);
+  }
+}
+async function streamChecked(target) {
+  const file = await openChecked(target);
+  async function* chunks() {
+    try {
+      let at = 0;
+      while (at < file.size) {
+        const buffer = Buffer.alloc(Math.min(READ_CHUNK, file.size - at));
+        const n = await readAt(target, file.handle, buffer, at);
+        if (n === 0) return;
+        at += n;
+        yield n === buffer.length ? buffer : buffer.subarray(0, n);
+      }
+      if (await readAt(target, file.handle, Buffer.alloc(1), at) > 0) grew(target);
+    } finally {
+      await file.handle.close().catch(() => void 0);
+    }
+  }
+  return { stream: Readable.from(chunks(), { objectMode: false }), file };
+}
+function firstInvalidUtf8(bytes) {
+  let i2 = 0;
+  while (i2 < bytes.length) {
+    const b = bytes[i2] ?? 0;
+    if (b < 128) {
+      i2++;
+      continue;
+    }
+    let need;
+    let low = 128;
+    let high = 191;
+    if (b >= 194 && b <= 223) need = 1;
+    else if (b >= 224 && b <= 239) {
+      need = 2;
+      if (b === 224) low = 160;
+      if (b === 237) high = 159;
+    } else if (b >= 240 && b <= 244) {
+      need = 3;
+      if (b === 240) low = 144;
+      if (b === 244) high = 143;
+    } else return i2;
+    for (let k = 1; k <= need; k++) {
+      const c = bytes[i2 + k];
+      if (c === void 0 || c < (k === 1 ? low : 128) || c > (k === 1 ? high : 191)) return i2;
+    }
+    i2 += need + 1;
+  }
+  return -1;
+}
+function decodeUtf8(bytes, file, what) {
+  const bad = firstInvalidUtf8(bytes);
+  if (bad < 0)
+    return Buffer.from(bytes.buffer, bytes.byteOffset, bytes.byteLength).toString("utf8");
+  let line = 1;
+  for (let i2 = 0; i2 < bad; i2++) if (bytes[i2] === 10) line++;
+  throw new InputError([
+    {
+      file,
+      pointer: `line ${line}`,
+      expected: `must be UTF-8 text (${what})`,
+      got: "an invalid UTF-8 sequence",
+      hint: bytes[0] === 255 && bytes[1] === 254 || bytes[0] === 254 && bytes[1] === 255 ? "The file looks like UTF-16; save it as UTF-8." : "Save the file as UTF-8."
+    }
+  ]);
+}
+
+// src/io/load-run.ts
 function besideArtifact(artifactPath, name) {
-  const folder = resolve(dirname(artifactPath));
-  const target = resolve(folder, name);
-  const rel = relative(folder, target);
-  if (rel === "" || rel.startsWith("..") || rel.includes(`..${sep}`) || resolve(folder, rel) !== target)
+  const folder = resolve2(dirname2(artifactPath));
+  const target = resolve2(folder, name);
+  const rel = relative2(folder, target);
+  if (rel === "" || rel.startsWith("..") || rel.includes(`..${sep}`) || resolve2(folder, rel) !== target)
     return null;
   return target;
 }
+function besideName(file, name) {
+  return `${dirname2(file) === "." ? "" : `${dirname2(file)}/`}${name}`;
+}
+function predictionsSource(target, track) {
+  return {
+    file: target.file,
+    open: async () => {
+      const { stream } = await streamChecked(target);
+      track?.(stream);
+      return stream;
+    }
+  };
+}
 async function loadRun(path, options = {}) {
   const file = options.displayName ?? path;
-  const bytes = await readText(path, file, "a run artifact (JSON)");
+  const limits = options.limits ?? DEFAULT_FILE_LIMITS;
+  const folder = dirname2(resolve2(path));
+  const { bytes, file: checked } = await readChecked({
+    path,
+    file,
+    what: "a run artifact (JSON)",
+    limit: "artifactBytes",
+    limits
+  });
+  const read = [{ realPath: checked.realPath, id: checked.id }];
   const sha2562 = createHash("sha256").update(bytes).digest("hex");
-  const artifact = validateRun(parseJson(bytes.toString("utf8"), file), file);
+  const text3 = decodeUtf8(bytes, file, "a run artifact");
+  const artifact = validateRun(parseJson(text3, file), file);
   const notes = [];
   let predictionsPath = null;
+  let predictions = null;
   if (artifact.predictions !== void 0) {
     predictionsPath = besideArtifact(path, artifact.predictions.path);
     const issue = {
@@ -22913,24 +23427,46 @@ async function loadRun(path, options = {}) {
       hint: 'Put the predictions CSV next to the artifact, or remove "predictions".'
     };
     if (predictionsPath === null) throw new InputError([issue]);
-    const info = await stat(predictionsPath).catch(() => null);
-    if (info === null || !info.isFile())
-      throw new InputError([
-        { ...issue, expected: "must name an existing file next to the artifact" }
-      ]);
+    const target = {
+      path: predictionsPath,
+      file: besideName(file, artifact.predictions.path),
+      what: "a predictions CSV",
+      folder,
+      limit: "csvBytes",
+      limits
+    };
+    const first = await openChecked(target).catch((error) => {
+      if (error instanceof MissingFileError)
+        throw new InputError([
+          { ...issue, expected: "must name an existing file next to the artifact" }
+        ]);
+      throw error;
+    });
+    await first.handle.close();
+    read.push({ realPath: first.realPath, id: first.id });
+    predictions = predictionsSource(target, options.track);
   }
   if (options.epochLog !== void 0) {
     const logPath = besideArtifact(path, options.epochLog.file);
-    const logName = `${dirname(file) === "." ? "" : `${dirname(file)}/`}${options.epochLog.file}`;
-    const info = logPath === null ? null : await stat(logPath).catch(() => null);
-    if (logPath !== null && info?.isFile() === true) {
+    const logName = besideName(file, options.epochLog.file);
+    const present = logPath !== null && await lstat(logPath).catch(() => null) !== null;
+    if (logPath !== null && present) {
       if (artifact.curves?.epochs !== void 0) {
         notes.push({ code: "epoch-log-not-used", file, log: logName });
       } else {
-        const text3 = (await readText(logPath, logName, "an epoch log (CSV)")).toString("utf8");
+        const log = await readChecked({
+          path: logPath,
+          file: logName,
+          what: "an epoch log (CSV)",
+          folder,
+          limit: "artifactBytes",
+          limits
+        });
+        read.push({ realPath: log.file.realPath, id: log.file.id });
+        const logText = decodeUtf8(log.bytes, logName, "an epoch log");
         artifact.curves = {
           ...artifact.curves,
-          epochs: parseEpochLog(text3, logName, options.epochLog)
+          epochs: parseEpochLog(logText, logName, options.epochLog)
         };
         const issues = semanticIssues(artifact, `${file} (with ${logName})`);
         if (issues.length > 0) throw new InputError(issues);
@@ -22939,7 +23475,7 @@ async function loadRun(path, options = {}) {
       notes.push({ code: "epoch-log-missing", file, log: logName });
     }
   }
-  return { artifact, file, sha256: sha2562, predictionsPath, notes };
+  return { artifact, file, sha256: sha2562, predictionsPath, predictions, notes, read };
 }
 
 // src/io/audit-side.ts
@@ -22979,7 +23515,7 @@ function sha256(bytes) {
 async function loadSide(options) {
   for (const file of [options.artifact, ...options.beside]) {
     const target = join(options.dir, ...file.path.split("/"));
-    await mkdir(dirname2(target), { recursive: true });
+    await mkdir(dirname3(target), { recursive: true });
     await writeFile(target, file.bytes);
   }
   return loadRun(join(options.dir, ...options.artifact.path.split("/")), {
@@ -22999,40 +23535,7 @@ function sideSources(commit, artifact, beside, from) {
 
 // src/io/review-from-files.ts
 import { createHash as createHash3 } from "node:crypto";
-import { dirname as dirname3, join as join2, resolve as resolve2 } from "node:path";
-
-// src/model/settings.ts
-var FAIL_ON_VALUES = [
-  "worse-validation",
-  "toward-overfitting",
-  "toward-underfitting",
-  "worse-on-both",
-  "any-movement",
-  "slice-regression",
-  "high-bias",
-  "high-variance",
-  "data-mismatch",
-  "validation-overfit",
-  "guardrail-regression",
-  "guardrail-undetermined",
-  "none"
-];
-var COST_OUTCOME_FIELDS = /* @__PURE__ */ new Map([
-  ["train-seconds", "trainSeconds"],
-  ["inference-ms", "inferenceMs"],
-  ["parameters", "parameters"],
-  ["memory-mb", "memoryMb"]
-]);
-var COST_RATIO_OUTCOME = /^(train-seconds|inference-ms|parameters|memory-mb)-ratio>((?:0|[1-9][0-9]*)(?:\.[0-9]+)?)$/;
-function isFailOn(value2) {
-  return FAIL_ON_VALUES.includes(value2) || COST_RATIO_OUTCOME.test(value2);
-}
-var DEFAULT_SETTINGS = {
-  alpha: 0.05,
-  minEffect: 0,
-  gapTolerance: 0.1,
-  failOn: ["worse-validation"]
-};
+import { resolve as resolve3 } from "node:path";
 
 // src/stats/distributions.ts
 var import_jstat = __toESM(require_jstat(), 1);
@@ -25394,7 +25897,6 @@ function pairedSummary(paired) {
 }
 
 // src/artifact/predictions.ts
-import { createReadStream } from "node:fs";
 import { createInterface } from "node:readline";
 var HEADER = { proportion: "id,correct", continuous: "id,loss" };
 function hashId(id) {
@@ -25429,23 +25931,27 @@ var HashLog = class {
 };
 function parseValue(raw, kind, file, line) {
   const column = kind === "proportion" ? "correct" : "loss";
-  const value2 = raw.trim() === "" ? Number.NaN : Number(raw);
-  if (kind === "proportion" ? value2 !== 0 && value2 !== 1 : !Number.isFinite(value2)) {
+  const text3 = raw.trim();
+  const value2 = kind === "proportion" ? text3 === "0" || text3 === "1" ? Number(text3) : Number.NaN : parseDecimal(text3) ?? Number.NaN;
+  if (!Number.isFinite(value2) || Math.abs(value2) > MAX_MAGNITUDE) {
     throw new InputError([
       {
         file,
         pointer: `line ${line}`,
-        expected: kind === "proportion" ? `column "${column}" must be 1 or 0` : `column "${column}" must be a finite number`,
+        expected: kind === "proportion" ? `column "${column}" must be 1 or 0` : `column "${column}" must be a decimal number within \xB11e15`,
         got: quote(raw)
       }
     ]);
   }
   return value2;
 }
-async function* readRows(path, file, kind, hashes) {
-  const stream = createReadStream(path, { encoding: "utf8" });
+async function* readRows(source, kind, hashes) {
+  const file = source.file;
+  const stream = await source.open();
+  stream.setEncoding("utf8");
   const lines = createInterface({ input: stream, crlfDelay: Infinity });
   let line = 0;
+  let rows = 0;
   try {
     for await (const text3 of lines) {
       line++;
@@ -25481,6 +25987,7 @@ async function* readRows(path, file, kind, hashes) {
           { file, pointer: `line ${line}`, expected: "must have a non-empty id" }
         ]);
       hashes?.push(hashId(id));
+      rows++;
       yield { id, value: parseValue(text3.slice(comma + 1), kind, file, line), line };
     }
   } finally {
@@ -25496,11 +26003,22 @@ async function* readRows(path, file, kind, hashes) {
       }
     ]);
   }
+  if (rows === 0) {
+    throw new InputError([
+      {
+        file,
+        pointer: "",
+        expected: "must have one row per example under its header",
+        got: "no rows"
+      }
+    ]);
+  }
 }
-async function duplicateIssues(path, file, kind, suspects) {
+async function duplicateIssues(source, kind, suspects) {
+  const file = source.file;
   const firstLine2 = /* @__PURE__ */ new Map();
   const issues = [];
-  for await (const row of readRows(path, file, kind)) {
+  for await (const row of readRows(source, kind)) {
     if (!suspects.has(hashId(row.id))) continue;
     const first = firstLine2.get(row.id);
     if (first === void 0) firstLine2.set(row.id, row.line);
@@ -25514,11 +26032,20 @@ async function duplicateIssues(path, file, kind, suspects) {
   }
   return issues;
 }
+async function checkPredictions(source, kind) {
+  const hashes = new HashLog();
+  for await (const row of readRows(source, kind, hashes)) void row;
+  const repeated = hashes.repeated();
+  if (repeated.size > 0) {
+    const issues = await duplicateIssues(source, kind, repeated);
+    if (issues.length > 0) throw new InputError(issues);
+  }
+}
 async function pairPredictions(baseline, candidate, kind) {
   const baseHashes = new HashLog();
   const candHashes = new HashLog();
-  const base = readRows(baseline.path, baseline.file, kind, baseHashes);
-  const cand = readRows(candidate.path, candidate.file, kind, candHashes);
+  const base = readRows(baseline, kind, baseHashes);
+  const cand = readRows(candidate, kind, candHashes);
   const waitingBase = /* @__PURE__ */ new Map();
   const waitingCand = /* @__PURE__ */ new Map();
   let rows = 0;
@@ -25558,11 +26085,9 @@ async function pairPredictions(baseline, candidate, kind) {
   }
   const issues = [];
   const baseRepeated = baseHashes.repeated();
-  if (baseRepeated.size > 0)
-    issues.push(...await duplicateIssues(baseline.path, baseline.file, kind, baseRepeated));
+  if (baseRepeated.size > 0) issues.push(...await duplicateIssues(baseline, kind, baseRepeated));
   const candRepeated = candHashes.repeated();
-  if (candRepeated.size > 0)
-    issues.push(...await duplicateIssues(candidate.path, candidate.file, kind, candRepeated));
+  if (candRepeated.size > 0) issues.push(...await duplicateIssues(candidate, kind, candRepeated));
   if (issues.length > 0) throw new InputError(issues);
   const unmatched = { baseline: waitingBase.size, candidate: waitingCand.size };
   if (kind === "proportion") return { kind, rows, baselineOnly, candidateOnly, unmatched };
@@ -25578,7 +26103,6 @@ async function pairPredictions(baseline, candidate, kind) {
 // src/io/load-config.ts
 var import__2 = __toESM(require__(), 1);
 var import_yaml = __toESM(require_dist2(), 1);
-import { readFile as readFile2 } from "node:fs/promises";
 
 // schema/fitgap-config.schema.json
 var fitgap_config_schema_default = {
@@ -25590,31 +26114,65 @@ var fitgap_config_schema_default = {
   properties: {
     alpha: {
       type: "number",
-      exclusiveMinimum: 0,
-      exclusiveMaximum: 0.5,
-      description: "Significance level; default 0.05."
+      minimum: 1e-6,
+      maximum: 0.5,
+      description: "Significance level of every test, from 0.000001 to 0.5; default 0.05."
     },
     "min-effect": {
       type: "number",
       minimum: 0,
-      description: "Smallest change, in metric units, that counts; default 0."
+      maximum: 1e15,
+      description: "Smallest change, in metric units, that counts; from 0 to 1e15; default 0."
     },
     "gap-tolerance": {
       type: "number",
       minimum: 0,
       maximum: 1,
-      description: "A component counts as present at this fraction of the validation error level; default 0.10."
+      description: "A component counts as present at this fraction of the validation error level, from 0 to 1; default 0.10."
     },
     reference: {
       type: "number",
-      description: "Reference level (human-level, prior system, Bayes error) overriding the artifacts'."
+      minimum: -1e15,
+      maximum: 1e15,
+      description: "Reference level (human-level, prior system, Bayes error) overriding the artifacts'; within [0, 1] for a proportion metric."
     },
     "fail-on": {
-      type: "array",
-      items: {
-        type: "string"
-      },
-      description: "Outcomes that fail the gate; see README 'Gate'."
+      description: "Outcomes that fail the gate (README 'Gate'): a list, or one text with the outcomes separated by commas or new lines. 'none' never fails and stands alone; an empty list is refused.",
+      oneOf: [
+        {
+          type: "string",
+          minLength: 1
+        },
+        {
+          type: "array",
+          minItems: 1,
+          items: {
+            type: "string",
+            anyOf: [
+              {
+                enum: [
+                  "worse-validation",
+                  "toward-overfitting",
+                  "toward-underfitting",
+                  "worse-on-both",
+                  "any-movement",
+                  "slice-regression",
+                  "high-bias",
+                  "high-variance",
+                  "data-mismatch",
+                  "validation-overfit",
+                  "guardrail-regression",
+                  "guardrail-undetermined",
+                  "none"
+                ]
+              },
+              {
+                pattern: "^(train-seconds|inference-ms|parameters|memory-mb)-ratio>((?:0|[1-9][0-9]*)(?:\\.[0-9]+)?)$"
+              }
+            ]
+          }
+        }
+      ]
     },
     "epoch-log": {
       type: "object",
@@ -25704,6 +26262,25 @@ var fitgap_config_schema_default = {
           }
         }
       }
+    },
+    limits: {
+      type: "object",
+      additionalProperties: false,
+      description: "Byte limits of the input files, in MB (see SECURITY.md). The config file's own limit is set by --max-config-mb or the action input max-config-mb.",
+      properties: {
+        "artifact-mb": {
+          type: "number",
+          minimum: 1e-3,
+          maximum: 1024,
+          description: "Largest run artifact or epoch log; default 16."
+        },
+        "csv-mb": {
+          type: "number",
+          minimum: 1e-3,
+          maximum: 65536,
+          description: "Largest predictions CSV; default 512."
+        }
+      }
     }
   }
 };
@@ -25711,38 +26288,131 @@ var fitgap_config_schema_default = {
 // src/io/load-config.ts
 var compiled2;
 function validator2() {
-  compiled2 ??= new import__2.Ajv2020({ allErrors: true, strict: true }).compile(fitgap_config_schema_default);
+  compiled2 ??= new import__2.Ajv2020({
+    allErrors: true,
+    strict: true,
+    strictNumbers: true
+  }).compile(fitgap_config_schema_default);
   return compiled2;
 }
-function failOnIssues(values, file, pointer) {
-  return values.flatMap(
-    (value2, i2) => isFailOn(value2) ? [] : [
-      {
-        file,
-        pointer: pointer === "" ? "" : `${pointer}/${i2}`,
-        expected: `must be one of ${FAIL_ON_VALUES.join(", ")}`,
-        got: quote(value2)
+var MAX_FLOW_DEPTH = 16;
+var MAX_BLOCK_PREFIX = 64;
+var MAX_ALIASES = 100;
+function yamlNestingProblem(text3) {
+  const lines = text3.split("\n");
+  let depth = 0;
+  for (let n = 0; n < lines.length; n++) {
+    const line = lines[n] ?? "";
+    const prefix = /^[\s-]*/.exec(line)?.[0].length ?? 0;
+    if (prefix > MAX_BLOCK_PREFIX)
+      return {
+        line: n + 1,
+        what: `indentation or "- " nesting over ${MAX_BLOCK_PREFIX} characters`
+      };
+    let quoteChar = "";
+    for (let i2 = 0; i2 < line.length; i2++) {
+      const c = line[i2];
+      if (quoteChar !== "") {
+        if (c === quoteChar) quoteChar = "";
+        continue;
       }
-    ]
-  );
+      if (c === '"' || c === "'") quoteChar = c;
+      else if (c === "#" && (i2 === 0 || /\s/.test(line[i2 - 1] ?? ""))) break;
+      else if (c === "[" || c === "{") {
+        depth++;
+        if (depth > MAX_FLOW_DEPTH)
+          return { line: n + 1, what: `brackets nested more than ${MAX_FLOW_DEPTH} deep` };
+      } else if (c === "]" || c === "}") depth = Math.max(0, depth - 1);
+    }
+  }
+  return null;
+}
+function lineOf(text3, offset) {
+  let line = 1;
+  for (let i2 = 0; i2 < offset && i2 < text3.length; i2++) if (text3.charCodeAt(i2) === 10) line++;
+  return line;
 }
 function parseConfig(text3, file) {
-  const document = (0, import_yaml.parseDocument)(text3, { prettyErrors: true });
+  return checkSettings(parseRaw(text3, file), file);
+}
+var NUMBER_KEYS = ["alpha", "min-effect", "gap-tolerance", "reference"];
+var SETTING_KEYS = /* @__PURE__ */ new Set([...NUMBER_KEYS, "fail-on"]);
+function checkSettings(data, file) {
+  const { "fail-on": failOn, ...rest } = data;
+  const issues = [];
+  for (const key of NUMBER_KEYS) {
+    const value2 = rest[key];
+    if (value2 === void 0) continue;
+    const source2 = { file, pointer: `/${key}` };
+    if (typeof value2 !== "number") {
+      issues.push({ ...source2, expected: "must be a number", got: quote(value2) });
+    } else issues.push(...numberSettingIssues(key, value2, source2));
+  }
+  if (issues.length > 0) throw new InputError(issues);
+  if (failOn === void 0) return rest;
+  const source = { file, pointer: "/fail-on" };
+  if (typeof failOn === "string") {
+    const parsed = parseFailOn(failOn, source);
+    if ("issues" in parsed) throw new InputError(parsed.issues);
+    return { ...rest, "fail-on": parsed.value };
+  }
+  if (!Array.isArray(failOn) || failOn.some((v) => typeof v !== "string")) {
+    throw new InputError([
+      {
+        ...source,
+        expected: "must be a list of outcomes, or one text with outcomes separated by commas",
+        got: quote(failOn)
+      }
+    ]);
+  }
+  const failOnProblems = failOnIssues(failOn, source);
+  if (failOnProblems.length > 0) throw new InputError(failOnProblems);
+  return { ...rest, "fail-on": failOn };
+}
+function parseRaw(text3, file) {
+  const nesting = yamlNestingProblem(text3);
+  if (nesting !== null) {
+    throw new InputError([
+      {
+        file,
+        pointer: `line ${nesting.line}`,
+        expected: "must not nest deeper than a config needs",
+        got: nesting.what
+      }
+    ]);
+  }
+  const document = (0, import_yaml.parseDocument)(text3, { prettyErrors: false, uniqueKeys: true });
   if (document.errors.length > 0) {
     throw new InputError(
       document.errors.slice(0, 10).map((error) => ({
         file,
-        pointer: error.linePos?.[0] ? `line ${error.linePos[0].line}` : "",
+        pointer: `line ${lineOf(text3, error.pos[0])}`,
         expected: "is not valid YAML",
-        got: quote(error.message.split("\n")[0] ?? "")
+        got: quote(
+          /call stack/i.test(error.message) ? "nesting too deep" : error.message.split("\n")[0] ?? ""
+        )
       }))
     );
   }
-  const data = document.toJS() ?? {};
+  let data;
+  try {
+    data = document.toJS({ maxAliasCount: MAX_ALIASES }) ?? {};
+  } catch (error) {
+    throw new InputError([
+      {
+        file,
+        pointer: "",
+        expected: `must not expand aliases more than ${MAX_ALIASES} times`,
+        got: quote(error instanceof Error ? error.message.split("\n")[0] : String(error)),
+        hint: "Write the values out; a config needs no anchors (&) or aliases (*)."
+      }
+    ]);
+  }
   const validate = validator2();
-  if (!validate(data)) {
+  const rest = data !== null && typeof data === "object" && !Array.isArray(data) ? Object.fromEntries(Object.entries(data).filter(([key]) => !SETTING_KEYS.has(key))) : data;
+  if (!validate(rest)) {
     throw new InputError(
-      ajvIssues(validate.errors ?? [], file, data).map((issue) => ({
+      ajvIssues(validate.errors ?? [], file, rest).map((issue) => ({
         ...issue,
         hint: issue.hint?.replace(
           "schema/fitgap-run-1.schema.json",
@@ -25751,31 +26421,58 @@ function parseConfig(text3, file) {
       }))
     );
   }
-  const issues = failOnIssues(data["fail-on"] ?? [], file, "/fail-on");
-  if (issues.length > 0) throw new InputError(issues);
   return data;
 }
-async function loadConfig(path, file, required) {
-  let text3;
+async function loadConfig(path, file, required, limits) {
+  let read;
   try {
-    text3 = await readFile2(path, "utf8");
+    read = await readChecked({
+      path,
+      file,
+      what: "a config file (YAML)",
+      limit: "configBytes",
+      limits
+    });
   } catch (error) {
-    const code2 = error.code;
-    if (!required && code2 === "ENOENT") return null;
-    throw new InputError([
-      {
-        file,
-        pointer: "",
-        expected: "could not be read",
-        got: code2 ?? String(error),
-        hint: "Check the --config path."
-      }
-    ]);
+    if (!(error instanceof MissingFileError)) throw error;
+    if (!required) return null;
+    throw new InputError(
+      error.issues.map((i2) => ({ ...i2, hint: "Check the config path." }))
+    );
   }
-  return { config: parseConfig(text3, file), text: text3 };
+  const text3 = decodeUtf8(read.bytes, file, "a config file");
+  return {
+    config: parseConfig(text3, file),
+    text: text3,
+    checked: { realPath: read.file.realPath, id: read.file.id }
+  };
 }
 
 // src/io/review-from-files.ts
+var MB2 = 1024 * 1024;
+function resolveLimits(config, given = {}) {
+  const fromConfig = {};
+  const artifactMb = config.limits?.["artifact-mb"];
+  const csvMb = config.limits?.["csv-mb"];
+  if (artifactMb !== void 0) fromConfig.artifactBytes = Math.round(artifactMb * MB2);
+  if (csvMb !== void 0) fromConfig.csvBytes = Math.round(csvMb * MB2);
+  return { ...DEFAULT_FILE_LIMITS, ...fromConfig, ...given };
+}
+function referenceIssues(config, options, configFile, kind) {
+  if (kind !== "proportion") return [];
+  const fromFlag = options.overrides?.reference;
+  const value2 = fromFlag ?? config.reference;
+  if (value2 === void 0 || value2 >= 0 && value2 <= 1) return [];
+  return [
+    {
+      file: fromFlag !== void 0 ? options.overrideLabel?.("reference") ?? "--reference" : configFile,
+      pointer: fromFlag !== void 0 ? "" : "/reference",
+      expected: "must be within [0, 1] for a proportion metric",
+      got: quote(value2),
+      hint: "Write the reference as a fraction (0.02, not 2)."
+    }
+  ];
+}
 var DEFAULT_CONFIG_PATH = ".github/fitgap.yml";
 function resolveSettings(config, overrides = {}) {
   const reference = overrides.reference ?? config.reference;
@@ -25803,26 +26500,40 @@ function sameMetric(baseline, candidate) {
     hint: "Compare runs of the same metric; a review of different metrics would be meaningless."
   }));
 }
+var MIN_PAIRED_ROWS = 2;
 async function pairIfBoth(baseline, candidate) {
   const bp = baseline.artifact.predictions;
   const cp = candidate.artifact.predictions;
-  if (bp === void 0 || cp === void 0 || baseline.predictionsPath === null || candidate.predictionsPath === null) {
-    return {
-      notes: bp !== cp && (bp === void 0 || cp === void 0) ? [{ code: "predictions-in-one-run" }] : []
-    };
+  const kind = candidate.artifact.metric.kind;
+  const unpaired = async (notes2) => {
+    for (const run of [baseline, candidate])
+      if (run.predictions !== null) await checkPredictions(run.predictions, kind);
+    return { notes: notes2 };
+  };
+  if (baseline.predictions === null || candidate.predictions === null || bp === void 0 || cp === void 0) {
+    return unpaired(
+      bp !== cp && (bp === void 0 || cp === void 0) ? [{ code: "predictions-in-one-run" }] : []
+    );
   }
   if (bp.split !== cp.split) {
-    return {
-      notes: [{ code: "predictions-split-mismatch", baseline: bp.split, candidate: cp.split }]
-    };
+    return unpaired([
+      { code: "predictions-split-mismatch", baseline: bp.split, candidate: cp.split }
+    ]);
   }
-  const result = await pairPredictions(
-    { path: baseline.predictionsPath, file: join2(dirname3(baseline.file), bp.path) },
-    { path: candidate.predictionsPath, file: join2(dirname3(candidate.file), cp.path) },
-    candidate.artifact.metric.kind
-  );
+  const result = await pairPredictions(baseline.predictions, candidate.predictions, kind);
   const notes = [];
   const { unmatched, ...paired } = result;
+  if (result.rows < MIN_PAIRED_ROWS) {
+    throw new InputError([
+      {
+        file: `${baseline.predictions.file} and ${candidate.predictions.file}`,
+        pointer: "",
+        expected: `must share at least ${MIN_PAIRED_ROWS} ids to be paired`,
+        got: `${result.rows} shared (${unmatched.baseline} and ${unmatched.candidate} unmatched rows)`,
+        hint: "Write predictions of the same examples, with the same ids, for both runs."
+      }
+    ]);
+  }
   if (unmatched.baseline + unmatched.candidate > 0) {
     notes.push({
       code: "predictions-unmatched",
@@ -25833,12 +26544,18 @@ async function pairIfBoth(baseline, candidate) {
   }
   return { paired: { ...paired, split: bp.split }, notes };
 }
-async function loadReviewConfig(cwd, config) {
-  const configPath = resolve2(cwd, config ?? DEFAULT_CONFIG_PATH);
-  const loaded = await loadConfig(configPath, config ?? DEFAULT_CONFIG_PATH, config !== void 0);
-  if (loaded === null) return { config: {}, file: null };
+async function loadReviewConfig(cwd, config, limits) {
+  const configPath = resolve3(cwd, config ?? DEFAULT_CONFIG_PATH);
+  const loaded = await loadConfig(
+    configPath,
+    config ?? DEFAULT_CONFIG_PATH,
+    config !== void 0,
+    resolveLimits({}, limits)
+  );
+  if (loaded === null) return { config: {}, file: null, read: [] };
   return {
     config: loaded.config,
+    read: [loaded.checked],
     file: {
       path: config ?? DEFAULT_CONFIG_PATH,
       sha256: createHash3("sha256").update(loaded.text).digest("hex")
@@ -25859,31 +26576,57 @@ async function reviewLoadedRuns(baseline, candidate, config, overrides) {
 }
 async function reviewFiles(options) {
   const cwd = options.cwd ?? ".";
-  const { config, file: configFile } = await loadReviewConfig(cwd, options.config);
-  const epochLog = config["epoch-log"];
-  const load = (path) => loadRun(resolve2(cwd, path), {
-    displayName: path,
+  const configPath = resolve3(cwd, options.config ?? DEFAULT_CONFIG_PATH);
+  const configFile = options.names?.config ?? options.config ?? DEFAULT_CONFIG_PATH;
+  const loaded = await loadConfig(
+    configPath,
+    configFile,
+    options.config !== void 0,
+    resolveLimits({}, options.limits)
+  );
+  const config = loaded?.config ?? {};
+  const limits = resolveLimits(config, options.limits);
+  const epochLog = options.epochLogs === false ? void 0 : config["epoch-log"];
+  const streams = [];
+  const load = (path, name) => loadRun(resolve3(cwd, path), {
+    displayName: name ?? path,
+    limits,
+    track: (stream) => streams.push(stream),
     ...epochLog === void 0 ? {} : { epochLog }
   });
-  const [b, c] = await Promise.allSettled([load(options.baseline), load(options.candidate)]);
-  const issues = [b, c].flatMap(
-    (r) => r.status === "rejected" ? r.reason instanceof InputError ? r.reason.issues : [] : []
-  );
-  for (const r of [b, c])
-    if (r.status === "rejected" && !(r.reason instanceof InputError)) throw r.reason;
-  if (issues.length > 0 || b.status === "rejected" || c.status === "rejected")
-    throw new InputError(issues);
-  const baseline = b.value;
-  const candidate = c.value;
-  const review2 = await reviewLoadedRuns(baseline, candidate, config, options.overrides);
-  return {
-    review: review2,
-    files: {
-      baseline: { path: options.baseline, sha256: baseline.sha256 },
-      candidate: { path: options.candidate, sha256: candidate.sha256 },
-      config: configFile
-    }
-  };
+  try {
+    const [b, c] = await Promise.allSettled([
+      load(options.baseline, options.names?.baseline),
+      load(options.candidate, options.names?.candidate)
+    ]);
+    const issues = [b, c].flatMap(
+      (r) => r.status === "rejected" ? r.reason instanceof InputError ? r.reason.issues : [] : []
+    );
+    for (const r of [b, c])
+      if (r.status === "rejected" && !(r.reason instanceof InputError)) throw r.reason;
+    if (issues.length > 0 || b.status === "rejected" || c.status === "rejected")
+      throw new InputError(issues);
+    const baseline = b.value;
+    const candidate = c.value;
+    const reference = referenceIssues(config, options, configFile, candidate.artifact.metric.kind);
+    if (reference.length > 0) throw new InputError(reference);
+    const review2 = await reviewLoadedRuns(baseline, candidate, config, options.overrides);
+    return {
+      review: review2,
+      files: {
+        baseline: { path: baseline.file, sha256: baseline.sha256 },
+        candidate: { path: candidate.file, sha256: candidate.sha256 },
+        config: loaded === null ? null : {
+          path: configFile,
+          sha256: createHash3("sha256").update(loaded.text).digest("hex")
+        }
+      },
+      runs: { baseline, candidate },
+      read: [...loaded === null ? [] : [loaded.checked], ...baseline.read, ...candidate.read]
+    };
+  } finally {
+    for (const stream of streams) stream.destroy();
+  }
 }
 
 // src/io/audit-github.ts
@@ -26014,11 +26757,11 @@ async function fetchSide(options, side, sha, fallback, headRepository) {
   }
 }
 async function review(options, base, head) {
-  const root = await mkdtemp(join3(options.tempDir, "fitgap-audit-"));
+  const root = await mkdtemp(join2(options.tempDir, "fitgap-audit-"));
   try {
     const epochLog = options.config["epoch-log"];
     const load = (f, dir) => loadSide({
-      dir: join3(root, dir),
+      dir: join2(root, dir),
       artifact: f.artifact,
       beside: f.beside,
       displayName: f.from === void 0 ? `${short(f.commit)}:${f.artifact.path}` : `${f.from.name}@${f.from.runId}:${f.artifact.path}`,
@@ -26100,7 +26843,7 @@ async function auditCommitPair(options) {
 
 // src/io/audit.ts
 import { mkdtemp as mkdtemp2, rm as rm2 } from "node:fs/promises";
-import { join as join4 } from "node:path";
+import { join as join3 } from "node:path";
 
 // src/io/audit-git.ts
 import { posix as posix3 } from "node:path";
@@ -26122,7 +26865,7 @@ var GitError = class extends Error {
   }
 };
 function gitRunner(cwd) {
-  return (args, options = {}) => new Promise((resolve6, reject) => {
+  return (args, options = {}) => new Promise((resolve8, reject) => {
     execFile(
       "git",
       ["--no-pager", ...args],
@@ -26134,7 +26877,7 @@ function gitRunner(cwd) {
       },
       (error, stdout, stderr) => {
         if (error === null) {
-          resolve6(stdout);
+          resolve8(stdout);
           return;
         }
         const code2 = error.code ?? null;
@@ -26314,7 +27057,7 @@ async function auditRange(options) {
   const toInfo = await commitInfo(git, to);
   const repository = await originRepository(git);
   const configSource = options.configFile === null ? [] : [{ commit: null, ...options.configFile }];
-  const root = await mkdtemp2(join4(options.tempDir, "fitgap-audit-"));
+  const root = await mkdtemp2(join3(options.tempDir, "fitgap-audit-"));
   const entries = [];
   const all = [fromInfo, ...commits];
   let seenAny = false;
@@ -26328,7 +27071,7 @@ async function auditRange(options) {
   };
   const epochLog = options.config["epoch-log"];
   const load = async (info, read) => {
-    const dir = join4(root, info.sha);
+    const dir = join3(root, info.sha);
     try {
       const run = await loadSide({
         dir,
@@ -30827,6 +31570,21 @@ throttling.triggersNotification = triggersNotification;
 
 // src/io/github/client.ts
 var Client = Octokit2.plugin(retry, throttling);
+function fetchWithTimeout(base, ms) {
+  return async (input, init) => {
+    const timeout = AbortSignal.timeout(ms);
+    const signal = init?.signal ? AbortSignal.any([init.signal, timeout]) : timeout;
+    try {
+      return await base(input, { ...init, signal });
+    } catch (error) {
+      if (timeout.aborted)
+        throw new TypeError("fetch failed", {
+          cause: new Error(`no answer within ${Math.round(ms / 100) / 10} s (timed out)`)
+        });
+      throw error;
+    }
+  };
+}
 function createClient(options) {
   const limitRetries = options.rateLimitRetries ?? 2;
   const maxWait = options.maxRateLimitWaitS ?? 120;
@@ -30842,7 +31600,9 @@ function createClient(options) {
     baseUrl: options.baseUrl,
     auth: options.token,
     userAgent: "fitgap-action",
-    request: options.fetch === void 0 ? {} : { fetch: options.fetch },
+    request: {
+      fetch: fetchWithTimeout(options.fetch ?? globalThis.fetch, options.timeoutMs ?? 3e4)
+    },
     // 429 is left to the throttling plugin, which honours retry-after.
     retry: {
       retries: options.retries,
@@ -32910,16 +33670,41 @@ function renderAuditText(audit) {
 // src/entries/cli/args.ts
 import { parseArgs } from "node:util";
 var FORMATS = ["text", "markdown", "json"];
+var NEGATIVE_NUMBER = /^-(?:\d|\.\d)/;
+function joinNegativeValues(argv, options) {
+  const out = [];
+  for (let i2 = 0; i2 < argv.length; i2++) {
+    const token = argv[i2] ?? "";
+    if (token === "--") {
+      out.push(...argv.slice(i2));
+      break;
+    }
+    const name = token.startsWith("--") && !token.includes("=") ? token.slice(2) : null;
+    const next = argv[i2 + 1];
+    if (name !== null && options[name]?.type === "string" && next !== void 0 && NEGATIVE_NUMBER.test(next)) {
+      out.push(`${token}=${next}`);
+      i2++;
+    } else out.push(token);
+  }
+  return out;
+}
 function parseFlags(argv, options, command) {
   try {
-    const parsed = parseArgs({ args: argv, options, allowPositionals: true, strict: true });
+    const parsed = parseArgs({
+      args: joinNegativeValues(argv, options),
+      options,
+      allowPositionals: true,
+      strict: true
+    });
     return {
       values: parsed.values,
       positionals: parsed.positionals
     };
   } catch (error) {
     const message = error instanceof Error ? error.message.split("\n")[0] ?? "" : String(error);
-    throw new UsageError(`fitgap ${command}: ${message}. Run 'fitgap ${command} --help'.`);
+    throw new UsageError(
+      `fitgap ${command}: ${message.replace(/\.+$/, "")}. Run 'fitgap ${command} --help'.`
+    );
   }
 }
 function parseFormat(value2, command) {
@@ -32930,30 +33715,55 @@ function parseFormat(value2, command) {
     `fitgap ${command}: --format must be one of ${FORMATS.join(", ")} (got ${JSON.stringify(value2)}).`
   );
 }
-function number(values, flag, range, command) {
-  const raw = values[flag];
-  if (raw === void 0 || typeof raw !== "string") return void 0;
-  const value2 = Number(raw);
-  if (raw.trim() === "" || !Number.isFinite(value2) || value2 < range[0] || value2 > range[1]) {
-    throw new UsageError(
-      `fitgap ${command}: --${flag} must be a number from ${range[0]} to ${range[1]} (got ${JSON.stringify(raw)}).`
-    );
-  }
-  return value2;
-}
-function parseOverrides(values, command) {
+var SETTING_FLAGS = {
+  alpha: { type: "string" },
+  "min-effect": { type: "string" },
+  "gap-tolerance": { type: "string" },
+  reference: { type: "string" },
+  "fail-on": { type: "string" }
+};
+var LIMIT_FLAGS = {
+  "max-artifact-mb": { type: "string" },
+  "max-config-mb": { type: "string" },
+  "max-csv-mb": { type: "string" }
+};
+var FIELD2 = {
+  alpha: "alpha",
+  "min-effect": "minEffect",
+  "gap-tolerance": "gapTolerance",
+  reference: "reference"
+};
+function parseOverrides(values) {
   const out = {};
-  const alpha = number(values, "alpha", [1e-9, 0.5], command);
-  if (alpha !== void 0) out.alpha = alpha;
-  const minEffect = number(values, "min-effect", [0, Number.MAX_VALUE], command);
-  if (minEffect !== void 0) out.minEffect = minEffect;
-  const gap = number(values, "gap-tolerance", [0, 1], command);
-  if (gap !== void 0) out.gapTolerance = gap;
-  const reference = number(values, "reference", [-Number.MAX_VALUE, Number.MAX_VALUE], command);
-  if (reference !== void 0) out.reference = reference;
+  const issues = [];
+  for (const name of Object.keys(FIELD2)) {
+    const raw = values[name];
+    if (typeof raw !== "string") continue;
+    const parsed = parseNumberSetting(name, raw, { file: `--${name}`, pointer: "" });
+    if ("issues" in parsed) issues.push(...parsed.issues);
+    else out[FIELD2[name]] = parsed.value;
+  }
   const failOn = values["fail-on"];
-  if (typeof failOn === "string")
-    out.failOn = failOn.split(",").map((s) => s.trim()).filter((s) => s !== "");
+  if (typeof failOn === "string") {
+    const parsed = parseFailOn(failOn, { file: "--fail-on", pointer: "" });
+    if ("issues" in parsed) issues.push(...parsed.issues);
+    else out.failOn = parsed.value;
+  }
+  if (issues.length > 0) throw new InputError(issues);
+  return out;
+}
+function parseLimits(values) {
+  const out = {};
+  const issues = [];
+  for (const key of Object.keys(LIMIT_NAMES)) {
+    const option = LIMIT_NAMES[key].option;
+    const raw = values[option];
+    if (typeof raw !== "string") continue;
+    const parsed = parseLimitMb(key, raw, `--${option}`);
+    if ("issues" in parsed) issues.push(...parsed.issues);
+    else out[key] = parsed.bytes;
+  }
+  if (issues.length > 0) throw new InputError(issues);
   return out;
 }
 
@@ -32992,21 +33802,30 @@ Options:
   --config FILE         config file (default: .github/fitgap.yml when it exists)
   --format FORMAT       text (default), markdown or json
   --out FILE            write the review to FILE instead of standard output
-  --alpha N             significance level (default 0.05)
+  --alpha N             significance level, 0.000001 to 0.5 (default 0.05)
   --min-effect N        smallest change that counts, in metric units (default 0)
-  --gap-tolerance N     component present at N x validation error (default 0.10)
+  --gap-tolerance N     component present at N x validation error, 0 to 1 (default 0.10)
   --reference N         reference level (human-level or Bayes error) for both runs
-  --fail-on LIST        comma-separated outcomes that fail the gate
-                        (default worse-validation; 'none' never fails)
+  --fail-on LIST        outcomes that fail the gate, separated by commas or new lines
+                        (default worse-validation; 'none' never fails; never empty)
   --comment-key KEY     key of the hidden marker in markdown output (default 'default')
+  --max-artifact-mb N   largest run artifact or epoch log read (default 16)
+  --max-config-mb N     largest config file read (default 1)
+  --max-csv-mb N        largest predictions CSV read (default 512)
   -h, --help            show this help
 
 Flags override the config file. Exit codes: 0 gate passed; 1 gate failed; 2 bad input.
 `;
-var VALIDATE_HELP = `Usage: fitgap validate FILE...
+var VALIDATE_HELP = `Usage: fitgap validate [--config FILE] FILE...
 
-Check run artifacts (.json, with their predictions CSV) and config files (.yml, .yaml).
+Check run artifacts (.json, with their predictions CSV and, when the config maps one, their
+epoch log) and config files (.yml, .yaml): everything 'fitgap review' would check.
 Prints one line per file; exit code 0 when all are valid, 2 otherwise.
+
+Options:
+  --config FILE         config whose epoch-log mapping and limits apply
+                        (default: .github/fitgap.yml when it exists)
+  --max-artifact-mb N, --max-config-mb N, --max-csv-mb N   file limits, as for review
 `;
 var DEMO_HELP = `Usage: fitgap demo [NAME] [--format text|markdown|json]
 
@@ -33141,11 +33960,7 @@ async function auditCommand(argv, io) {
   }
   if (positionals.length > 0) throw usage(`unexpected argument ${JSON.stringify(positionals[0])}.`);
   const format = parseFormat(values["format"], "audit");
-  const overrides = parseOverrides(values, "audit");
-  if (overrides.failOn !== void 0) {
-    const issues = failOnIssues(overrides.failOn, "--fail-on", "");
-    if (issues.length > 0) throw new InputError(issues);
-  }
+  const overrides = parseOverrides(values);
   const range = text(values, "range");
   const repo = text(values, "repo");
   if (range === void 0 === (repo === void 0))
@@ -33153,7 +33968,7 @@ async function auditCommand(argv, io) {
       range === void 0 ? "name what to audit: --range A..B with --artifact PATH, or --repo OWNER/NAME with --pull-request N." : "--range and --repo audit different things; give one of them."
     );
   const configOption = text(values, "config");
-  const { config, file: configFile } = await loadReviewConfig(io.cwd, configOption);
+  const { config, file: configFile, read } = await loadReviewConfig(io.cwd, configOption);
   const now = (io.now ?? (() => /* @__PURE__ */ new Date()))();
   const context = { recordedAt: now.toISOString(), fitgapVersion: io.version };
   const tempDir = io.tempDir ?? tmpdir();
@@ -33193,7 +34008,7 @@ async function auditCommand(argv, io) {
   const out = text(values, "out");
   if (out === void 0) io.stdout(output);
   else {
-    await io.writeFile(resolve3(io.cwd, out), output);
+    await io.writeFile(resolve4(io.cwd, out), output, { file: out, inputs: read });
     if (!quiet) io.stderr(`fitgap: audit written to ${out}.
 `);
   }
@@ -33247,8 +34062,8 @@ async function runGitHub(values, io, options) {
   const byCommits = pr === void 0 && base !== void 0 && head !== void 0;
   if (!byPull && !byCommits)
     throw usage("--repo needs --pull-request N, or both --base COMMIT and --head COMMIT.");
-  const number2 = pr === void 0 ? null : Number(pr);
-  if (number2 !== null && (!Number.isInteger(number2) || number2 < 1))
+  const number = pr === void 0 ? null : Number(pr);
+  if (number !== null && (!Number.isInteger(number) || number < 1))
     throw usage(`--pull-request must be a pull request number (got ${JSON.stringify(pr)}).`);
   const source = artifactSource(values);
   const token = io.env?.["GITHUB_TOKEN"] ?? "";
@@ -33275,7 +34090,7 @@ async function runGitHub(values, io, options) {
     limitBytes: maxFileBytes(values)
   };
   try {
-    return number2 !== null ? await auditPullRequest({ ...github, pullNumber: number2 }) : await auditCommitPair({
+    return number !== null ? await auditPullRequest({ ...github, pullNumber: number }) : await auditCommitPair({
       ...github,
       base: base ?? "",
       head: head ?? "",
@@ -33313,7 +34128,7 @@ function artifactSource(values) {
 
 // src/entries/cli/commands.ts
 import { readdir } from "node:fs/promises";
-import { join as join5, resolve as resolve4 } from "node:path";
+import { join as join4, resolve as resolve5 } from "node:path";
 
 // src/entries/cli/render.ts
 function renderReview(result, format, options) {
@@ -33340,11 +34155,8 @@ var REVIEW_FLAGS = {
   config: { type: "string" },
   format: { type: "string" },
   out: { type: "string" },
-  alpha: { type: "string" },
-  "min-effect": { type: "string" },
-  "gap-tolerance": { type: "string" },
-  reference: { type: "string" },
-  "fail-on": { type: "string" },
+  ...SETTING_FLAGS,
+  ...LIMIT_FLAGS,
   "comment-key": { type: "string" },
   help: { type: "boolean", short: "h" }
 };
@@ -33366,11 +34178,8 @@ async function reviewCommand(argv, io) {
     );
   }
   const format = parseFormat(values["format"], "review");
-  const overrides = parseOverrides(values, "review");
-  if (overrides.failOn !== void 0) {
-    const issues = failOnIssues(overrides.failOn, "--fail-on", "");
-    if (issues.length > 0) throw new InputError(issues);
-  }
+  const overrides = parseOverrides(values);
+  const limits = parseLimits(values);
   const commentKey = values["comment-key"];
   if (typeof commentKey === "string" && !isValidCommentKey(commentKey)) {
     throw new UsageError(
@@ -33383,6 +34192,8 @@ async function reviewCommand(argv, io) {
     candidate,
     cwd: io.cwd,
     overrides,
+    overrideLabel: (name) => `--${name}`,
+    limits,
     ...typeof config === "string" ? { config } : {}
   });
   const text3 = renderReview(result, format, {
@@ -33391,7 +34202,7 @@ async function reviewCommand(argv, io) {
   });
   const out = values["out"];
   if (typeof out === "string") {
-    await io.writeFile(resolve4(io.cwd, out), text3);
+    await io.writeFile(resolve5(io.cwd, out), text3, { file: out, inputs: result.read });
     io.stderr(
       `fitgap: review written to ${out} (gate ${result.review.gate.pass ? "passed" : "failed"}).
 `
@@ -33402,7 +34213,7 @@ async function reviewCommand(argv, io) {
 async function validateCommand(argv, io) {
   const { values, positionals } = parseFlags(
     argv,
-    { help: { type: "boolean", short: "h" } },
+    { help: { type: "boolean", short: "h" }, config: { type: "string" }, ...LIMIT_FLAGS },
     "validate"
   );
   if (values["help"] === true) {
@@ -33411,15 +34222,32 @@ async function validateCommand(argv, io) {
   }
   if (positionals.length === 0)
     throw new UsageError("fitgap validate: name at least one file. Run 'fitgap validate --help'.");
+  const given = parseLimits(values);
+  const configName = typeof values["config"] === "string" ? values["config"] : void 0;
+  const loaded = await loadConfig(
+    resolve5(io.cwd, configName ?? DEFAULT_CONFIG_PATH),
+    configName ?? DEFAULT_CONFIG_PATH,
+    configName !== void 0,
+    resolveLimits({}, given)
+  );
+  const config = loaded?.config ?? {};
+  const limits = resolveLimits(config, given);
+  const epochLog = config["epoch-log"];
   let failed = false;
   for (const file of positionals) {
     try {
       if (/\.ya?ml$/i.test(file)) {
-        await loadConfig(resolve4(io.cwd, file), file, true);
+        await loadConfig(resolve5(io.cwd, file), file, true, limits);
         io.stdout(`${file}: valid config
 `);
       } else {
-        const run = await loadRun(resolve4(io.cwd, file), { displayName: file });
+        const run = await loadRun(resolve5(io.cwd, file), {
+          displayName: file,
+          limits,
+          ...epochLog === void 0 ? {} : { epochLog }
+        });
+        if (run.predictions !== null)
+          await checkPredictions(run.predictions, run.artifact.metric.kind);
         io.stdout(
           `${file}: valid run artifact "${run.artifact.run.name}" (${run.artifact.splits.train.values.length} repeat(s))
 `
@@ -33430,7 +34258,7 @@ async function validateCommand(argv, io) {
       failed = true;
       for (const issue of error.issues.slice(0, 10))
         io.stderr(
-          `${formatIssue({ ...issue, file: issue.file === resolve4(io.cwd, file) ? file : issue.file })}
+          `${formatIssue({ ...issue, file: issue.file === resolve5(io.cwd, file) ? file : issue.file })}
 `
         );
       if (error.issues.length > 10)
@@ -33464,9 +34292,9 @@ async function demoCommand(argv, io) {
     );
   const format = parseFormat(values["format"], "demo");
   const result = await reviewFiles({
-    baseline: join5(io.demoDir, "baseline.json"),
-    candidate: join5(io.demoDir, `${name}.json`),
-    config: join5(io.demoDir, "fitgap.yml"),
+    baseline: join4(io.demoDir, "baseline.json"),
+    candidate: join4(io.demoDir, `${name}.json`),
+    config: join4(io.demoDir, "fitgap.yml"),
     cwd: io.cwd
   });
   io.stdout(renderReview(result, format, { color: io.color }));
@@ -33482,8 +34310,54 @@ Demo: Crumb & Co. baseline vs candidate "${name}". See the others with:
   return EXIT.ok;
 }
 
+// src/io/write-output.ts
+import { realpath as realpath2, stat, writeFile as writeFile2 } from "node:fs/promises";
+import { basename, dirname as dirname4, join as join5, resolve as resolve6 } from "node:path";
+function refuse3(file, expected, got, hint) {
+  throw new InputError([{ file, pointer: "", expected, got, hint }]);
+}
+async function realTarget(path) {
+  const real = await realpath2(path).catch(() => null);
+  if (real !== null) return real;
+  const folder = await realpath2(dirname4(path)).catch(() => null);
+  return folder === null ? null : join5(folder, basename(path));
+}
+async function identify(path) {
+  const real = await realpath2(path).catch(() => null);
+  const info = real === null ? null : await stat(real).catch(() => null);
+  return real === null || info === null ? null : { realPath: real, id: `${info.dev}:${info.ino}` };
+}
+async function writeOutput(path, text3, file, inputs) {
+  const target = resolve6(path);
+  const real = await realTarget(target);
+  const info = await stat(target).catch(() => null);
+  const id = info === null ? null : `${info.dev}:${info.ino}`;
+  if (inputs.some((input) => input.realPath === real || id !== null && input.id === id)) {
+    refuse3(
+      file,
+      "must not name one of the review's input files (--out)",
+      "an input file",
+      "Write the review to a new file."
+    );
+  }
+  if (info?.isDirectory() === true)
+    refuse3(file, "could not be written (--out)", "a folder", "Name a file, not a folder.");
+  try {
+    await writeFile2(target, text3, "utf8");
+  } catch (error) {
+    const code2 = error.code;
+    const got = code2 === "ENOENT" ? "no such folder" : code2 === "ENOSPC" ? "no space left on the device" : code2 === "EROFS" ? "a read-only file system" : describeCode(code2);
+    refuse3(
+      file,
+      "could not be written (--out)",
+      got,
+      "Check that the folder exists and can be written to."
+    );
+  }
+}
+
 // src/entries/cli/curves-import.ts
-import { resolve as resolve5 } from "node:path";
+import { resolve as resolve7 } from "node:path";
 
 // src/artifact/curve-logs/limits.ts
 var MAX_POINTS2 = 1e6;
@@ -33520,15 +34394,15 @@ function decodeText(input, file, what) {
   }
   return text3.charCodeAt(0) === 65279 ? text3.slice(1) : text3;
 }
-var DECIMAL = /^[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?$/;
-function parseDecimal(text3) {
+var DECIMAL2 = /^[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?$/;
+function parseDecimal2(text3) {
   const t = text3.trim();
-  if (DECIMAL.test(t)) return Number(t);
+  if (DECIMAL2.test(t)) return Number(t);
   if (/^[+-]?(?:nan|inf|infinity)$/i.test(t)) return /nan/i.test(t) ? Number.NaN : Infinity;
   return void 0;
 }
 function notFinite(file, pointer, what, got) {
-  const nonFinite = parseDecimal(got) !== void 0;
+  const nonFinite = parseDecimal2(got) !== void 0;
   return {
     file,
     pointer,
@@ -33656,7 +34530,7 @@ function readCsvLog(input, file, options = {}) {
         "Quote cells that contain commas, or fix the header."
       );
     const xCell = cells[xi] ?? "";
-    const x2 = xCell === "" ? Number.NaN : parseDecimal(xCell);
+    const x2 = xCell === "" ? Number.NaN : parseDecimal2(xCell);
     if (x2 === void 0 || !Number.isFinite(x2)) {
       xIssues.push(notFinite(file, `line ${line}`, `column "${xName}"`, xCell));
       continue;
@@ -33665,7 +34539,7 @@ function readCsvLog(input, file, options = {}) {
       const cell = cells[c] ?? "";
       const s = series[c];
       if (c === xi || cell === "" || s === void 0) continue;
-      const value2 = parseDecimal(cell);
+      const value2 = parseDecimal2(cell);
       if (value2 === void 0 || !Number.isFinite(value2)) {
         if (s.problems.length < 10)
           s.problems.push(notFinite(file, `line ${line}`, `column "${s.name}"`, cell));
@@ -33811,10 +34685,10 @@ function readUint32(bytes, at) {
 function readTfRecords(bytes, file) {
   const records = [];
   let offset = 0;
-  let number2 = 0;
+  let number = 0;
   while (offset < bytes.length) {
-    number2++;
-    const where = `record ${number2} (byte ${offset})`;
+    number++;
+    const where = `record ${number} (byte ${offset})`;
     if (bytes.length - offset < 12) return { records, truncatedAt: offset };
     if (maskCrc(crc32c(bytes, offset, offset + 8)) !== readUint32(bytes, offset + 8)) {
       throw new InputError([
@@ -33851,7 +34725,7 @@ function readTfRecords(bytes, file) {
         }
       ]);
     }
-    records.push({ data: bytes.subarray(start, end), number: number2, offset });
+    records.push({ data: bytes.subarray(start, end), number, offset });
     offset = end + 4;
   }
   return { records };
@@ -34086,7 +34960,7 @@ function readMlflowMetric(input, file, key, options = {}) {
         }
       ]);
     }
-    const value2 = parseDecimal(valueText ?? "");
+    const value2 = parseDecimal2(valueText ?? "");
     if (value2 === void 0 || !Number.isFinite(value2)) {
       if (series.problems.length < 10)
         series.problems.push(notFinite(file, `line ${line}`, `metric "${key}"`, valueText ?? ""));
@@ -34663,10 +35537,21 @@ function buildCurve(read, catalogue, options = {}) {
 }
 
 // src/io/curve-logs.ts
-import { readFile as readFile3, readdir as readdir2, stat as stat2 } from "node:fs/promises";
-import { basename, dirname as dirname4, join as join6, relative as relative2, sep as sep3 } from "node:path";
+import { readdir as readdir2, stat as stat2 } from "node:fs/promises";
+import { basename as basename2, dirname as dirname5, join as join6, relative as relative3, sep as sep3 } from "node:path";
 var nodeCurveLogFs = {
-  readFile: (path) => readFile3(path),
+  // Opened as untrusted input (real path in its folder, regular file, fixed size); the size limit
+  // per format is checked by `readLogFile` first, so this one only bounds the read.
+  readFile: async (path, display) => (await readChecked({
+    path,
+    file: display ?? path,
+    what: "a training log",
+    limit: "artifactBytes",
+    limits: {
+      ...DEFAULT_FILE_LIMITS,
+      artifactBytes: Math.max(MAX_EVENT_FILE_BYTES, MAX_TEXT_BYTES)
+    }
+  })).bytes,
   readdir: async (path) => (await readdir2(path, { withFileTypes: true })).map((d) => ({
     name: d.name,
     kind: d.isFile() ? "file" : d.isDirectory() ? "dir" : "other"
@@ -34728,16 +35613,16 @@ async function readLogFile(fs, file, maxBytes) {
       `must be at most ${maxBytes / 1024 / 1024} MiB (it has ${size} bytes)`,
       "Import a shorter log, or thin it out first."
     );
-  return fs.readFile(file.path);
+  return fs.readFile(file.path, file.display);
 }
-async function kindOf(fs, p) {
+async function kindOf2(fs, p) {
   const { kind } = await fs.stat(p.path);
   if (kind === "missing" || kind === "other")
     throw problem(p.display, kind === "missing" ? "does not exist" : "must be a file or a folder");
   return kind;
 }
 async function oneFile(fs, root, match, what) {
-  if (await kindOf(fs, root) === "file") return root;
+  if (await kindOf2(fs, root) === "file") return root;
   const found = await search(fs, root, match, "file");
   const [first] = found;
   if (first === void 0)
@@ -34767,7 +35652,7 @@ function pool(results) {
   return { series: [...byName.values()], warnings };
 }
 function commonDir(paths) {
-  const split = paths.map((p) => dirname4(p).split(sep3));
+  const split = paths.map((p) => dirname5(p).split(sep3));
   const first = split[0] ?? [];
   let n = first.length;
   for (const parts of split) {
@@ -34780,7 +35665,7 @@ function commonDir(paths) {
 async function readTensorBoardLogs(fs, paths, budget) {
   const files = [];
   for (const p of paths) {
-    if (await kindOf(fs, p) === "file") files.push(p);
+    if (await kindOf2(fs, p) === "file") files.push(p);
     else {
       const found = await search(fs, p, (n) => n.startsWith("events.out.tfevents."), "file");
       if (found.length === 0)
@@ -34795,7 +35680,7 @@ async function readTensorBoardLogs(fs, paths, budget) {
   const common = commonDir(files.map((f) => f.path));
   const results = [];
   for (const f of files) {
-    const label = relative2(common, dirname4(f.path)).split(sep3).join("/");
+    const label = relative3(common, dirname5(f.path)).split(sep3).join("/");
     const read = readTensorBoard(await readLogFile(fs, f, MAX_EVENT_FILE_BYTES), f.display, {
       budget
     });
@@ -34808,17 +35693,17 @@ async function readMlflowLogs(fs, paths, budget) {
   const results = [];
   let catalogueFile = "";
   for (const p of paths) {
-    if (await kindOf(fs, p) === "file") {
+    if (await kindOf2(fs, p) === "file") {
       const segments = p.display.split(/[\\/]/);
       const at = segments.lastIndexOf("metrics");
-      const key = at >= 0 && at < segments.length - 1 ? segments.slice(at + 1).join("/") : basename(p.path);
+      const key = at >= 0 && at < segments.length - 1 ? segments.slice(at + 1).join("/") : basename2(p.path);
       results.push(
         readMlflowMetric(await readLogFile(fs, p, MAX_TEXT_BYTES), p.display, key, { budget })
       );
       catalogueFile ||= p.display;
       continue;
     }
-    const metricsDirs = basename(p.path) === "metrics" ? [p] : await search(fs, p, (n) => n === "metrics", "dir");
+    const metricsDirs = basename2(p.path) === "metrics" ? [p] : await search(fs, p, (n) => n === "metrics", "dir");
     const [metrics] = metricsDirs;
     if (metrics === void 0)
       throw problem(
@@ -35013,7 +35898,7 @@ async function curvesImportCommand(argv, io, fs = nodeCurveLogFs) {
   const train = text2(values, "train");
   const validation = text2(values, "validation");
   const metric = text2(values, "metric");
-  const paths = positionals.map((p) => ({ path: resolve5(io.cwd, p), display: p }));
+  const paths = positionals.map((p) => ({ path: resolve7(io.cwd, p), display: p }));
   const { read, catalogue } = await readCurveLogs(format, paths, fs, x2 === void 0 ? {} : { x: x2 });
   const curve = buildCurve(read, catalogue, {
     ...train === void 0 ? {} : { train },
@@ -35023,8 +35908,14 @@ async function curvesImportCommand(argv, io, fs = nodeCurveLogFs) {
   const epochs = curve.points.map(
     (p) => p.train === void 0 ? { x: p.x, validation: p.validation } : { x: p.x, train: p.train, validation: p.validation }
   );
-  await io.writeFile(resolve5(io.cwd, out), `${JSON.stringify({ epochs }, null, 2)}
-`);
+  const inputs = (await Promise.all(paths.map((p) => identify(p.path)))).filter(
+    (f) => f !== null
+  );
+  await io.writeFile(resolve7(io.cwd, out), `${JSON.stringify({ epochs }, null, 2)}
+`, {
+    file: out,
+    inputs
+  });
   for (const line of curveImportNotes(curve, out)) io.stderr(`fitgap: ${line}
 `);
   return EXIT.ok;
@@ -35152,12 +36043,22 @@ var package_default = {
 
 // src/entries/cli.ts
 var version = package_default.version;
+var closed = false;
+var quietOnClose = (error) => {
+  if (error.code === "EPIPE") closed = true;
+  else throw error;
+};
+process.stdout.on("error", quietOnClose);
+process.stderr.on("error", quietOnClose);
+var write = (stream) => (text3) => {
+  if (!closed) stream.write(text3);
+};
 runCli(process.argv.slice(2), {
-  stdout: (text3) => process.stdout.write(text3),
-  stderr: (text3) => process.stderr.write(text3),
+  stdout: write(process.stdout),
+  stderr: write(process.stderr),
   color: process.stdout.isTTY === true && process.env["NO_COLOR"] === void 0,
   cwd: process.cwd(),
-  writeFile: (path, text3) => writeFile2(path, text3, "utf8"),
+  writeFile: (path, text3, { file, inputs }) => writeOutput(path, text3, file, inputs),
   demoDir: fileURLToPath(new URL("../demo/", import.meta.url)),
   version,
   stderrStream: process.stderr,
@@ -35167,11 +36068,12 @@ runCli(process.argv.slice(2), {
     process.exitCode = code2;
   },
   (error) => {
-    process.stderr.write(
-      `fitgap: internal error (a bug; please report it):
+    if (!closed)
+      process.stderr.write(
+        `fitgap: internal error (a bug; please report it):
 ${error instanceof Error ? error.stack ?? error.message : String(error)}
 `
-    );
+      );
     process.exitCode = 3;
   }
 );

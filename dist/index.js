@@ -2172,9 +2172,9 @@ var require_dispatcher_base = __commonJS({
       }
       close(callback) {
         if (callback === void 0) {
-          return new Promise((resolve5, reject) => {
+          return new Promise((resolve6, reject) => {
             this.close((err2, data) => {
-              return err2 ? reject(err2) : resolve5(data);
+              return err2 ? reject(err2) : resolve6(data);
             });
           });
         }
@@ -2212,12 +2212,12 @@ var require_dispatcher_base = __commonJS({
           err2 = null;
         }
         if (callback === void 0) {
-          return new Promise((resolve5, reject) => {
+          return new Promise((resolve6, reject) => {
             this.destroy(err2, (err3, data) => {
               return err3 ? (
                 /* istanbul ignore next: should never error */
                 reject(err3)
-              ) : resolve5(data);
+              ) : resolve6(data);
             });
           });
         }
@@ -4484,8 +4484,8 @@ var require_util2 = __commonJS({
     function createDeferredPromise() {
       let res;
       let rej;
-      const promise = new Promise((resolve5, reject) => {
-        res = resolve5;
+      const promise = new Promise((resolve6, reject) => {
+        res = resolve6;
         rej = reject;
       });
       return { promise, resolve: res, reject: rej };
@@ -5797,7 +5797,7 @@ var require_client_h1 = __commonJS({
       kResume,
       kHTTPContext
     } = require_symbols();
-    var constants3 = require_constants2();
+    var constants4 = require_constants2();
     var EMPTY_BUF = Buffer.alloc(0);
     var FastBuffer = Buffer[Symbol.species];
     var addListener = util.addListener;
@@ -5872,7 +5872,7 @@ var require_client_h1 = __commonJS({
       constructor(client, socket, { exports: exports2 }) {
         assert(Number.isFinite(client[kMaxHeadersSize]) && client[kMaxHeadersSize] > 0);
         this.llhttp = exports2;
-        this.ptr = this.llhttp.llhttp_alloc(constants3.TYPE.RESPONSE);
+        this.ptr = this.llhttp.llhttp_alloc(constants4.TYPE.RESPONSE);
         this.client = client;
         this.socket = socket;
         this.timeout = null;
@@ -5967,11 +5967,11 @@ var require_client_h1 = __commonJS({
             currentBufferRef = null;
           }
           const offset = llhttp.llhttp_get_error_pos(this.ptr) - currentBufferPtr;
-          if (ret !== constants3.ERROR.OK) {
+          if (ret !== constants4.ERROR.OK) {
             const body = data.subarray(offset);
-            if (ret === constants3.ERROR.PAUSED_UPGRADE) {
+            if (ret === constants4.ERROR.PAUSED_UPGRADE) {
               this.onUpgrade(body);
-            } else if (ret === constants3.ERROR.PAUSED) {
+            } else if (ret === constants4.ERROR.PAUSED) {
               this.paused = true;
               socket.unshift(body);
             } else {
@@ -5994,10 +5994,10 @@ var require_client_h1 = __commonJS({
         } finally {
           currentParser = null;
         }
-        if (ret === constants3.ERROR.OK) {
+        if (ret === constants4.ERROR.OK) {
           return null;
         }
-        if (ret === constants3.ERROR.PAUSED || ret === constants3.ERROR.PAUSED_UPGRADE) {
+        if (ret === constants4.ERROR.PAUSED || ret === constants4.ERROR.PAUSED_UPGRADE) {
           this.paused = true;
           return null;
         }
@@ -6014,7 +6014,7 @@ var require_client_h1 = __commonJS({
           const len = new Uint8Array(llhttp.memory.buffer, ptr).indexOf(0);
           message = "Response does not match the HTTP/1.1 protocol (" + Buffer.from(llhttp.memory.buffer, ptr, len).toString() + ")";
         }
-        return new HTTPParserError(message, constants3.ERROR[ret], data);
+        return new HTTPParserError(message, constants4.ERROR[ret], data);
       }
       destroy() {
         assert(this.ptr != null);
@@ -6194,7 +6194,7 @@ var require_client_h1 = __commonJS({
           socket[kBlocking] = false;
           client[kResume]();
         }
-        return pause ? constants3.ERROR.PAUSED : 0;
+        return pause ? constants4.ERROR.PAUSED : 0;
       }
       onBody(buf) {
         const { client, socket, statusCode, maxResponseSize } = this;
@@ -6216,7 +6216,7 @@ var require_client_h1 = __commonJS({
         }
         this.bytesRead += buf.length;
         if (request2.onData(buf) === false) {
-          return constants3.ERROR.PAUSED;
+          return constants4.ERROR.PAUSED;
         }
       }
       onMessageComplete() {
@@ -6252,13 +6252,13 @@ var require_client_h1 = __commonJS({
         if (socket[kWriting]) {
           assert(client[kRunning] === 0);
           util.destroy(socket, new InformationalError("reset"));
-          return constants3.ERROR.PAUSED;
+          return constants4.ERROR.PAUSED;
         } else if (!shouldKeepAlive) {
           util.destroy(socket, new InformationalError("reset"));
-          return constants3.ERROR.PAUSED;
+          return constants4.ERROR.PAUSED;
         } else if (socket[kReset] && client[kRunning] === 0) {
           util.destroy(socket, new InformationalError("reset"));
-          return constants3.ERROR.PAUSED;
+          return constants4.ERROR.PAUSED;
         } else if (client[kPipelining] == null || client[kPipelining] === 1) {
           setImmediate(() => client[kResume]());
         } else {
@@ -6736,12 +6736,12 @@ upgrade: ${upgrade}\r
           cb();
         }
       }
-      const waitForDrain = () => new Promise((resolve5, reject) => {
+      const waitForDrain = () => new Promise((resolve6, reject) => {
         assert(callback === null);
         if (socket[kError]) {
           reject(socket[kError]);
         } else {
-          callback = resolve5;
+          callback = resolve6;
         }
       });
       socket.on("close", onDrain).on("drain", onDrain);
@@ -6879,7 +6879,7 @@ var require_client_h2 = __commonJS({
     "use strict";
     var assert = __require("node:assert");
     var { errorMonitor } = __require("node:events");
-    var { pipeline } = __require("node:stream");
+    var { pipeline: pipeline2 } = __require("node:stream");
     var util = require_util();
     var {
       RequestContentLengthMismatchError,
@@ -7358,7 +7358,7 @@ var require_client_h2 = __commonJS({
     }
     function writeStream(abort, socket, expectsPayload, h2stream, body, client, request2, contentLength) {
       assert(contentLength !== 0 || client[kRunning] === 0, "stream body cannot be pipelined");
-      const pipe = pipeline(
+      const pipe = pipeline2(
         body,
         h2stream,
         (err2) => {
@@ -7411,12 +7411,12 @@ var require_client_h2 = __commonJS({
           cb();
         }
       }
-      const waitForDrain = () => new Promise((resolve5, reject) => {
+      const waitForDrain = () => new Promise((resolve6, reject) => {
         assert(callback === null);
         if (socket[kError]) {
           reject(socket[kError]);
         } else {
-          callback = resolve5;
+          callback = resolve6;
         }
       });
       h2stream.on("close", onDrain).on("drain", onDrain);
@@ -7895,16 +7895,16 @@ var require_client = __commonJS({
         return this[kNeedDrain] < 2;
       }
       async [kClose]() {
-        return new Promise((resolve5) => {
+        return new Promise((resolve6) => {
           if (this[kSize]) {
-            this[kClosedResolve] = resolve5;
+            this[kClosedResolve] = resolve6;
           } else {
-            resolve5(null);
+            resolve6(null);
           }
         });
       }
       async [kDestroy](err2) {
-        return new Promise((resolve5) => {
+        return new Promise((resolve6) => {
           const requests = this[kQueue].splice(this[kPendingIdx]);
           for (let i2 = 0; i2 < requests.length; i2++) {
             const request2 = requests[i2];
@@ -7915,7 +7915,7 @@ var require_client = __commonJS({
               this[kClosedResolve]();
               this[kClosedResolve] = null;
             }
-            resolve5(null);
+            resolve6(null);
           };
           if (this[kHTTPContext]) {
             this[kHTTPContext].destroy(err2, callback);
@@ -7966,7 +7966,7 @@ var require_client = __commonJS({
         });
       }
       try {
-        const socket = await new Promise((resolve5, reject) => {
+        const socket = await new Promise((resolve6, reject) => {
           client[kConnector]({
             host,
             hostname,
@@ -7978,7 +7978,7 @@ var require_client = __commonJS({
             if (err2) {
               reject(err2);
             } else {
-              resolve5(socket2);
+              resolve6(socket2);
             }
           });
         });
@@ -8314,8 +8314,8 @@ var require_pool_base = __commonJS({
         if (this[kQueue].isEmpty()) {
           await Promise.all(this[kClients].map((c) => c.close()));
         } else {
-          await new Promise((resolve5) => {
-            this[kClosedResolve] = resolve5;
+          await new Promise((resolve6) => {
+            this[kClosedResolve] = resolve6;
           });
         }
       }
@@ -9457,7 +9457,7 @@ var require_readable = __commonJS({
   "node_modules/undici/lib/api/readable.js"(exports, module) {
     "use strict";
     var assert = __require("node:assert");
-    var { Readable } = __require("node:stream");
+    var { Readable: Readable2 } = __require("node:stream");
     var { RequestAbortedError, NotSupportedError, InvalidArgumentError, AbortError } = require_errors();
     var util = require_util();
     var { ReadableStreamFrom } = require_util();
@@ -9469,7 +9469,7 @@ var require_readable = __commonJS({
     var kContentLength = /* @__PURE__ */ Symbol("kContentLength");
     var noop4 = () => {
     };
-    var BodyReadable = class extends Readable {
+    var BodyReadable = class extends Readable2 {
       constructor({
         resume,
         abort,
@@ -9584,7 +9584,7 @@ var require_readable = __commonJS({
         if (this._readableState.closeEmitted) {
           return null;
         }
-        return await new Promise((resolve5, reject) => {
+        return await new Promise((resolve6, reject) => {
           if (this[kContentLength] > limit) {
             this.destroy(new AbortError());
           }
@@ -9597,7 +9597,7 @@ var require_readable = __commonJS({
             if (signal?.aborted) {
               reject(signal.reason ?? new AbortError());
             } else {
-              resolve5(null);
+              resolve6(null);
             }
           }).on("error", noop4).on("data", function(chunk) {
             limit -= chunk.length;
@@ -9616,7 +9616,7 @@ var require_readable = __commonJS({
     }
     async function consume(stream, type) {
       assert(!stream[kConsume]);
-      return new Promise((resolve5, reject) => {
+      return new Promise((resolve6, reject) => {
         if (isUnusable(stream)) {
           const rState = stream._readableState;
           if (rState.destroyed && rState.closeEmitted === false) {
@@ -9633,7 +9633,7 @@ var require_readable = __commonJS({
             stream[kConsume] = {
               type,
               stream,
-              resolve: resolve5,
+              resolve: resolve6,
               reject,
               length: 0,
               body: []
@@ -9703,18 +9703,18 @@ var require_readable = __commonJS({
       return buffer;
     }
     function consumeEnd(consume2) {
-      const { type, body, resolve: resolve5, stream, length } = consume2;
+      const { type, body, resolve: resolve6, stream, length } = consume2;
       try {
         if (type === "text") {
-          resolve5(chunksDecode(body, length));
+          resolve6(chunksDecode(body, length));
         } else if (type === "json") {
-          resolve5(JSON.parse(chunksDecode(body, length)));
+          resolve6(JSON.parse(chunksDecode(body, length)));
         } else if (type === "arrayBuffer") {
-          resolve5(chunksConcat(body, length).buffer);
+          resolve6(chunksConcat(body, length).buffer);
         } else if (type === "blob") {
-          resolve5(new Blob(body, { type: stream[kContentType] }));
+          resolve6(new Blob(body, { type: stream[kContentType] }));
         } else if (type === "bytes") {
-          resolve5(chunksConcat(body, length));
+          resolve6(chunksConcat(body, length));
         }
         consumeFinish(consume2);
       } catch (err2) {
@@ -9811,7 +9811,7 @@ var require_api_request = __commonJS({
   "node_modules/undici/lib/api/api-request.js"(exports, module) {
     "use strict";
     var assert = __require("node:assert");
-    var { Readable } = require_readable();
+    var { Readable: Readable2 } = require_readable();
     var { InvalidArgumentError, RequestAbortedError } = require_errors();
     var util = require_util();
     var { getResolveErrorBodyCallback } = require_util3();
@@ -9906,7 +9906,7 @@ var require_api_request = __commonJS({
         const parsedHeaders = responseHeaders === "raw" ? util.parseHeaders(rawHeaders) : headers;
         const contentType = parsedHeaders["content-type"];
         const contentLength = parsedHeaders["content-length"];
-        const res = new Readable({
+        const res = new Readable2({
           resume,
           abort,
           contentType,
@@ -9971,9 +9971,9 @@ var require_api_request = __commonJS({
     };
     function request2(opts, callback) {
       if (callback === void 0) {
-        return new Promise((resolve5, reject) => {
+        return new Promise((resolve6, reject) => {
           request2.call(this, opts, (err2, data) => {
-            return err2 ? reject(err2) : resolve5(data);
+            return err2 ? reject(err2) : resolve6(data);
           });
         });
       }
@@ -10196,9 +10196,9 @@ var require_api_stream = __commonJS({
     };
     function stream(opts, factory, callback) {
       if (callback === void 0) {
-        return new Promise((resolve5, reject) => {
+        return new Promise((resolve6, reject) => {
           stream.call(this, opts, factory, (err2, data) => {
-            return err2 ? reject(err2) : resolve5(data);
+            return err2 ? reject(err2) : resolve6(data);
           });
         });
       }
@@ -10221,7 +10221,7 @@ var require_api_pipeline = __commonJS({
   "node_modules/undici/lib/api/api-pipeline.js"(exports, module) {
     "use strict";
     var {
-      Readable,
+      Readable: Readable2,
       Duplex,
       PassThrough
     } = __require("node:stream");
@@ -10235,7 +10235,7 @@ var require_api_pipeline = __commonJS({
     var { addSignal, removeSignal } = require_abort_signal();
     var assert = __require("node:assert");
     var kResume = /* @__PURE__ */ Symbol("resume");
-    var PipelineRequest = class extends Readable {
+    var PipelineRequest = class extends Readable2 {
       constructor() {
         super({ autoDestroy: true });
         this[kResume] = null;
@@ -10252,7 +10252,7 @@ var require_api_pipeline = __commonJS({
         callback(err2);
       }
     };
-    var PipelineResponse = class extends Readable {
+    var PipelineResponse = class extends Readable2 {
       constructor(resume) {
         super({ autoDestroy: true });
         this[kResume] = resume;
@@ -10403,7 +10403,7 @@ var require_api_pipeline = __commonJS({
         util.destroy(ret, err2);
       }
     };
-    function pipeline(opts, handler2) {
+    function pipeline2(opts, handler2) {
       try {
         const pipelineHandler = new PipelineHandler(opts, handler2);
         this.dispatch({ ...opts, body: pipelineHandler.req }, pipelineHandler);
@@ -10412,7 +10412,7 @@ var require_api_pipeline = __commonJS({
         return new PassThrough().destroy(err2);
       }
     }
-    module.exports = pipeline;
+    module.exports = pipeline2;
   }
 });
 
@@ -10483,9 +10483,9 @@ var require_api_upgrade = __commonJS({
     };
     function upgrade(opts, callback) {
       if (callback === void 0) {
-        return new Promise((resolve5, reject) => {
+        return new Promise((resolve6, reject) => {
           upgrade.call(this, opts, (err2, data) => {
-            return err2 ? reject(err2) : resolve5(data);
+            return err2 ? reject(err2) : resolve6(data);
           });
         });
       }
@@ -10577,9 +10577,9 @@ var require_api_connect = __commonJS({
     };
     function connect(opts, callback) {
       if (callback === void 0) {
-        return new Promise((resolve5, reject) => {
+        return new Promise((resolve6, reject) => {
           connect.call(this, opts, (err2, data) => {
-            return err2 ? reject(err2) : resolve5(data);
+            return err2 ? reject(err2) : resolve6(data);
           });
         });
       }
@@ -13577,7 +13577,7 @@ var require_fetch = __commonJS({
       subresourceSet
     } = require_constants3();
     var EE = __require("node:events");
-    var { Readable, pipeline, finished } = __require("node:stream");
+    var { Readable: Readable2, pipeline: pipeline2, finished } = __require("node:stream");
     var { addAbortListener, isErrored, isReadable, bufferToLowerCasedHeaderName } = require_util();
     var { dataURLProcessor, serializeAMimeType, minimizeSupportedMimeType } = require_data_url();
     var { getGlobalDispatcher } = require_global2();
@@ -14442,7 +14442,7 @@ var require_fetch = __commonJS({
       function dispatch({ body }) {
         const url = requestCurrentURL(request2);
         const agent = fetchParams.controller.dispatcher;
-        return new Promise((resolve5, reject) => agent.dispatch(
+        return new Promise((resolve6, reject) => agent.dispatch(
           {
             path: url.pathname + url.search,
             origin: url.origin,
@@ -14516,13 +14516,13 @@ var require_fetch = __commonJS({
                   }
                 }
               }
-              this.body = new Readable({ read: resume });
+              this.body = new Readable2({ read: resume });
               const onError = this.onError.bind(this);
-              resolve5({
+              resolve6({
                 status,
                 statusText,
                 headersList,
-                body: decoders.length ? pipeline(this.body, ...decoders, (err2) => {
+                body: decoders.length ? pipeline2(this.body, ...decoders, (err2) => {
                   if (err2) {
                     this.onError(err2);
                   }
@@ -14561,7 +14561,7 @@ var require_fetch = __commonJS({
               for (let i2 = 0; i2 < rawHeaders.length; i2 += 2) {
                 headersList.append(bufferToLowerCasedHeaderName(rawHeaders[i2]), rawHeaders[i2 + 1].toString("latin1"), true);
               }
-              resolve5({
+              resolve6({
                 status,
                 statusText: STATUS_CODES[status],
                 headersList,
@@ -18302,8 +18302,8 @@ var require_util8 = __commonJS({
       return true;
     }
     function delay(ms) {
-      return new Promise((resolve5) => {
-        setTimeout(resolve5, ms).unref();
+      return new Promise((resolve6) => {
+        setTimeout(resolve6, ms).unref();
       });
     }
     module.exports = {
@@ -18723,7 +18723,7 @@ ${value2}`;
 var require_eventsource = __commonJS({
   "node_modules/undici/lib/web/eventsource/eventsource.js"(exports, module) {
     "use strict";
-    var { pipeline } = __require("node:stream");
+    var { pipeline: pipeline2 } = __require("node:stream");
     var { fetching } = require_fetch();
     var { makeRequest } = require_request2();
     var { webidl } = require_webidl();
@@ -18883,7 +18883,7 @@ var require_eventsource = __commonJS({
               ));
             }
           });
-          pipeline(
+          pipeline2(
             response.body.stream,
             eventSourceStream,
             (error2) => {
@@ -19538,11 +19538,11 @@ var require_codegen = __commonJS({
         const rhs = this.rhs === void 0 ? "" : ` = ${this.rhs}`;
         return `${varKind} ${this.name}${rhs};` + _n;
       }
-      optimizeNames(names2, constants3) {
+      optimizeNames(names2, constants4) {
         if (!names2[this.name.str])
           return;
         if (this.rhs)
-          this.rhs = optimizeExpr(this.rhs, names2, constants3);
+          this.rhs = optimizeExpr(this.rhs, names2, constants4);
         return this;
       }
       get names() {
@@ -19559,10 +19559,10 @@ var require_codegen = __commonJS({
       render({ _n }) {
         return `${this.lhs} = ${this.rhs};` + _n;
       }
-      optimizeNames(names2, constants3) {
+      optimizeNames(names2, constants4) {
         if (this.lhs instanceof code_1.Name && !names2[this.lhs.str] && !this.sideEffects)
           return;
-        this.rhs = optimizeExpr(this.rhs, names2, constants3);
+        this.rhs = optimizeExpr(this.rhs, names2, constants4);
         return this;
       }
       get names() {
@@ -19623,8 +19623,8 @@ var require_codegen = __commonJS({
       optimizeNodes() {
         return `${this.code}` ? this : void 0;
       }
-      optimizeNames(names2, constants3) {
-        this.code = optimizeExpr(this.code, names2, constants3);
+      optimizeNames(names2, constants4) {
+        this.code = optimizeExpr(this.code, names2, constants4);
         return this;
       }
       get names() {
@@ -19653,12 +19653,12 @@ var require_codegen = __commonJS({
         }
         return nodes.length > 0 ? this : void 0;
       }
-      optimizeNames(names2, constants3) {
+      optimizeNames(names2, constants4) {
         const { nodes } = this;
         let i2 = nodes.length;
         while (i2--) {
           const n = nodes[i2];
-          if (n.optimizeNames(names2, constants3))
+          if (n.optimizeNames(names2, constants4))
             continue;
           subtractNames(names2, n.names);
           nodes.splice(i2, 1);
@@ -19711,12 +19711,12 @@ var require_codegen = __commonJS({
           return void 0;
         return this;
       }
-      optimizeNames(names2, constants3) {
+      optimizeNames(names2, constants4) {
         var _a2;
-        this.else = (_a2 = this.else) === null || _a2 === void 0 ? void 0 : _a2.optimizeNames(names2, constants3);
-        if (!(super.optimizeNames(names2, constants3) || this.else))
+        this.else = (_a2 = this.else) === null || _a2 === void 0 ? void 0 : _a2.optimizeNames(names2, constants4);
+        if (!(super.optimizeNames(names2, constants4) || this.else))
           return;
-        this.condition = optimizeExpr(this.condition, names2, constants3);
+        this.condition = optimizeExpr(this.condition, names2, constants4);
         return this;
       }
       get names() {
@@ -19739,10 +19739,10 @@ var require_codegen = __commonJS({
       render(opts) {
         return `for(${this.iteration})` + super.render(opts);
       }
-      optimizeNames(names2, constants3) {
-        if (!super.optimizeNames(names2, constants3))
+      optimizeNames(names2, constants4) {
+        if (!super.optimizeNames(names2, constants4))
           return;
-        this.iteration = optimizeExpr(this.iteration, names2, constants3);
+        this.iteration = optimizeExpr(this.iteration, names2, constants4);
         return this;
       }
       get names() {
@@ -19778,10 +19778,10 @@ var require_codegen = __commonJS({
       render(opts) {
         return `for(${this.varKind} ${this.name} ${this.loop} ${this.iterable})` + super.render(opts);
       }
-      optimizeNames(names2, constants3) {
-        if (!super.optimizeNames(names2, constants3))
+      optimizeNames(names2, constants4) {
+        if (!super.optimizeNames(names2, constants4))
           return;
-        this.iterable = optimizeExpr(this.iterable, names2, constants3);
+        this.iterable = optimizeExpr(this.iterable, names2, constants4);
         return this;
       }
       get names() {
@@ -19823,11 +19823,11 @@ var require_codegen = __commonJS({
         (_b2 = this.finally) === null || _b2 === void 0 ? void 0 : _b2.optimizeNodes();
         return this;
       }
-      optimizeNames(names2, constants3) {
+      optimizeNames(names2, constants4) {
         var _a2, _b2;
-        super.optimizeNames(names2, constants3);
-        (_a2 = this.catch) === null || _a2 === void 0 ? void 0 : _a2.optimizeNames(names2, constants3);
-        (_b2 = this.finally) === null || _b2 === void 0 ? void 0 : _b2.optimizeNames(names2, constants3);
+        super.optimizeNames(names2, constants4);
+        (_a2 = this.catch) === null || _a2 === void 0 ? void 0 : _a2.optimizeNames(names2, constants4);
+        (_b2 = this.finally) === null || _b2 === void 0 ? void 0 : _b2.optimizeNames(names2, constants4);
         return this;
       }
       get names() {
@@ -20128,7 +20128,7 @@ var require_codegen = __commonJS({
     function addExprNames(names2, from) {
       return from instanceof code_1._CodeOrName ? addNames(names2, from.names) : names2;
     }
-    function optimizeExpr(expr, names2, constants3) {
+    function optimizeExpr(expr, names2, constants4) {
       if (expr instanceof code_1.Name)
         return replaceName(expr);
       if (!canOptimize(expr))
@@ -20143,14 +20143,14 @@ var require_codegen = __commonJS({
         return items;
       }, []));
       function replaceName(n) {
-        const c = constants3[n.str];
+        const c = constants4[n.str];
         if (c === void 0 || names2[n.str] !== 1)
           return n;
         delete names2[n.str];
         return c;
       }
       function canOptimize(e) {
-        return e instanceof code_1._Code && e._items.some((c) => c instanceof code_1.Name && names2[c.str] === 1 && constants3[c.str] !== void 0);
+        return e instanceof code_1._Code && e._items.some((c) => c instanceof code_1.Name && names2[c.str] === 1 && constants4[c.str] !== void 0);
       }
     }
     function subtractNames(names2, from) {
@@ -22112,7 +22112,7 @@ var require_compile = __commonJS({
       const schOrFunc = root.refs[ref];
       if (schOrFunc)
         return schOrFunc;
-      let _sch = resolve5.call(this, root, ref);
+      let _sch = resolve6.call(this, root, ref);
       if (_sch === void 0) {
         const schema = (_a2 = root.localRefs) === null || _a2 === void 0 ? void 0 : _a2[ref];
         const { schemaId } = this.opts;
@@ -22139,7 +22139,7 @@ var require_compile = __commonJS({
     function sameSchemaEnv(s1, s2) {
       return s1.schema === s2.schema && s1.root === s2.root && s1.baseId === s2.baseId;
     }
-    function resolve5(root, ref) {
+    function resolve6(root, ref) {
       let sch;
       while (typeof (sch = this.refs[ref]) == "string")
         ref = sch;
@@ -22999,11 +22999,11 @@ var require_fast_uri = __commonJS({
         normalizeString(uri, options);
       } else if (typeof uri === "object") {
         uri = /** @type {T} */
-        parse4(serialize2(uri, options), options);
+        parse3(serialize2(uri, options), options);
       }
       return uri;
     }
-    function resolve5(baseURI, relativeURI, options) {
+    function resolve6(baseURI, relativeURI, options) {
       const schemelessOptions = options ? Object.assign({ scheme: "null" }, options) : { scheme: "null" };
       const {
         parsed: baseParsed,
@@ -23039,50 +23039,50 @@ var require_fast_uri = __commonJS({
       schemelessOptions.skipEscape = true;
       return serialize2(resolved, schemelessOptions);
     }
-    function resolveComponent(base, relative3, options, skipNormalization) {
+    function resolveComponent(base, relative4, options, skipNormalization) {
       const target = {};
       if (!skipNormalization) {
-        base = parse4(serialize2(base, options), options);
-        relative3 = parse4(serialize2(relative3, options), options);
+        base = parse3(serialize2(base, options), options);
+        relative4 = parse3(serialize2(relative4, options), options);
       }
       options = options || {};
-      if (!options.tolerant && relative3.scheme) {
-        target.scheme = relative3.scheme;
-        target.userinfo = relative3.userinfo;
-        target.host = relative3.host;
-        target.port = relative3.port;
-        target.path = removeDotSegments(relative3.path || "");
-        target.query = relative3.query;
+      if (!options.tolerant && relative4.scheme) {
+        target.scheme = relative4.scheme;
+        target.userinfo = relative4.userinfo;
+        target.host = relative4.host;
+        target.port = relative4.port;
+        target.path = removeDotSegments(relative4.path || "");
+        target.query = relative4.query;
       } else {
-        if (relative3.userinfo !== void 0 || relative3.host !== void 0 || relative3.port !== void 0) {
-          target.userinfo = relative3.userinfo;
-          target.host = relative3.host;
-          target.port = relative3.port;
-          target.path = removeDotSegments(relative3.path || "");
-          target.query = relative3.query;
+        if (relative4.userinfo !== void 0 || relative4.host !== void 0 || relative4.port !== void 0) {
+          target.userinfo = relative4.userinfo;
+          target.host = relative4.host;
+          target.port = relative4.port;
+          target.path = removeDotSegments(relative4.path || "");
+          target.query = relative4.query;
         } else {
-          if (!relative3.path) {
+          if (!relative4.path) {
             target.path = base.path;
-            if (relative3.query !== void 0) {
-              target.query = relative3.query;
+            if (relative4.query !== void 0) {
+              target.query = relative4.query;
             } else {
               target.query = base.query;
             }
           } else {
-            if (relative3.path[0] === "/") {
-              target.path = removeDotSegments(relative3.path);
+            if (relative4.path[0] === "/") {
+              target.path = removeDotSegments(relative4.path);
             } else {
               const baseHasAuthority = base.userinfo !== void 0 || base.host !== void 0 || base.port !== void 0;
               if (baseHasAuthority && !base.path) {
-                target.path = "/" + relative3.path;
+                target.path = "/" + relative4.path;
               } else if (!base.path) {
-                target.path = relative3.path;
+                target.path = relative4.path;
               } else {
-                target.path = base.path.slice(0, base.path.lastIndexOf("/") + 1) + relative3.path;
+                target.path = base.path.slice(0, base.path.lastIndexOf("/") + 1) + relative4.path;
               }
               target.path = base.scheme === void 0 && !baseHasAuthority && target.path[0] !== "/" ? removeDotSegmentsRelative(target.path) : removeDotSegments(target.path);
             }
-            target.query = relative3.query;
+            target.query = relative4.query;
           }
           target.userinfo = base.userinfo;
           target.host = base.host;
@@ -23090,7 +23090,7 @@ var require_fast_uri = __commonJS({
         }
         target.scheme = base.scheme;
       }
-      target.fragment = relative3.fragment;
+      target.fragment = relative4.fragment;
       return target;
     }
     function equal(uriA, uriB, options) {
@@ -23361,7 +23361,7 @@ var require_fast_uri = __commonJS({
       }
       return { parsed, malformedAuthorityOrPort, malformedPercentEncoding, malformedSchemeSpecific, malformedHost, malformedScheme };
     }
-    function parse4(uri, opts) {
+    function parse3(uri, opts) {
       return parseWithStatus(uri, opts).parsed;
     }
     function normalizeString(uri, opts) {
@@ -23394,11 +23394,11 @@ var require_fast_uri = __commonJS({
     var fastUri = {
       SCHEMES,
       normalize,
-      resolve: resolve5,
+      resolve: resolve6,
       resolveComponent,
       equal,
       serialize: serialize2,
-      parse: parse4
+      parse: parse3
     };
     module.exports = fastUri;
     module.exports.default = fastUri;
@@ -26556,8 +26556,8 @@ var require_json_schema_2020_12 = __commonJS({
         with$data(this, validation)
       ].forEach((sch) => this.addMetaSchema(sch, void 0, false));
       return this;
-      function with$data(ajv2, sch) {
-        return $data ? ajv2.$dataMetaSchema(sch, META_SUPPORT_DATA) : sch;
+      function with$data(ajv, sch) {
+        return $data ? ajv.$dataMetaSchema(sch, META_SUPPORT_DATA) : sch;
       }
     }
     exports.default = addMetaSchema2020;
@@ -26575,7 +26575,7 @@ var require__ = __commonJS({
     var discriminator_1 = require_discriminator();
     var json_schema_2020_12_1 = require_json_schema_2020_12();
     var META_SCHEMA_ID = "https://json-schema.org/draft/2020-12/schema";
-    var Ajv20204 = class extends core_1.default {
+    var Ajv20203 = class extends core_1.default {
       constructor(opts = {}) {
         super({
           ...opts,
@@ -26602,11 +26602,11 @@ var require__ = __commonJS({
         return this.opts.defaultMeta = super.defaultMeta() || (this.getSchema(META_SCHEMA_ID) ? META_SCHEMA_ID : void 0);
       }
     };
-    exports.Ajv2020 = Ajv20204;
-    module.exports = exports = Ajv20204;
-    module.exports.Ajv2020 = Ajv20204;
+    exports.Ajv2020 = Ajv20203;
+    module.exports = exports = Ajv20203;
+    module.exports.Ajv2020 = Ajv20203;
     Object.defineProperty(exports, "__esModule", { value: true });
-    exports.default = Ajv20204;
+    exports.default = Ajv20203;
     var validate_1 = require_validate();
     Object.defineProperty(exports, "KeywordCxt", { enumerable: true, get: function() {
       return validate_1.KeywordCxt;
@@ -27157,9 +27157,9 @@ var require_limit = __commonJS({
       },
       dependencies: ["format"]
     };
-    var formatLimitPlugin = (ajv2) => {
-      ajv2.addKeyword(exports.formatLimitDefinition);
-      return ajv2;
+    var formatLimitPlugin = (ajv) => {
+      ajv.addKeyword(exports.formatLimitDefinition);
+      return ajv;
     };
     exports.default = formatLimitPlugin;
   }
@@ -27175,17 +27175,17 @@ var require_dist = __commonJS({
     var codegen_1 = require_codegen();
     var fullName2 = new codegen_1.Name("fullFormats");
     var fastName = new codegen_1.Name("fastFormats");
-    var formatsPlugin = (ajv2, opts = { keywords: true }) => {
+    var formatsPlugin = (ajv, opts = { keywords: true }) => {
       if (Array.isArray(opts)) {
-        addFormats2(ajv2, opts, formats_1.fullFormats, fullName2);
-        return ajv2;
+        addFormats2(ajv, opts, formats_1.fullFormats, fullName2);
+        return ajv;
       }
       const [formats, exportName] = opts.mode === "fast" ? [formats_1.fastFormats, fastName] : [formats_1.fullFormats, fullName2];
       const list = opts.formats || formats_1.formatNames;
-      addFormats2(ajv2, list, formats, exportName);
+      addFormats2(ajv, list, formats, exportName);
       if (opts.keywords)
-        (0, limit_1.default)(ajv2);
-      return ajv2;
+        (0, limit_1.default)(ajv);
+      return ajv;
     };
     formatsPlugin.get = (name, mode = "full") => {
       const formats = mode === "fast" ? formats_1.fastFormats : formats_1.fullFormats;
@@ -27194,12 +27194,12 @@ var require_dist = __commonJS({
         throw new Error(`Unknown format "${name}"`);
       return f;
     };
-    function addFormats2(ajv2, list, fs3, exportName) {
+    function addFormats2(ajv, list, fs3, exportName) {
       var _a2;
       var _b2;
-      (_a2 = (_b2 = ajv2.opts.code).formats) !== null && _a2 !== void 0 ? _a2 : _b2.formats = (0, codegen_1._)`require("ajv-formats/dist/formats").${exportName}`;
+      (_a2 = (_b2 = ajv.opts.code).formats) !== null && _a2 !== void 0 ? _a2 : _b2.formats = (0, codegen_1._)`require("ajv-formats/dist/formats").${exportName}`;
       for (const f of list)
-        ajv2.addFormat(f, fs3[f]);
+        ajv.addFormat(f, fs3[f]);
     }
     module.exports = exports = formatsPlugin;
     Object.defineProperty(exports, "__esModule", { value: true });
@@ -27809,28 +27809,28 @@ var require_jstat = __commonJS({
           var distinctNumbers = [];
           var numberCounts = {};
           for (i2 = 0; i2 < arr.length; i2++) {
-            var number2 = arr[i2];
-            if (numberCounts[number2]) {
-              numberCounts[number2]++;
+            var number = arr[i2];
+            if (numberCounts[number]) {
+              numberCounts[number]++;
             } else {
-              numberCounts[number2] = 1;
-              distinctNumbers.push(number2);
+              numberCounts[number] = 1;
+              distinctNumbers.push(number);
             }
           }
           var sortedDistinctNumbers = distinctNumbers.sort(ascNum);
           var numberRanks = {};
           var currentRank = 1;
           for (i2 = 0; i2 < sortedDistinctNumbers.length; i2++) {
-            var number2 = sortedDistinctNumbers[i2];
-            var count2 = numberCounts[number2];
+            var number = sortedDistinctNumbers[i2];
+            var count2 = numberCounts[number];
             var first = currentRank;
             var last = currentRank + count2 - 1;
             var rank = (first + last) / 2;
-            numberRanks[number2] = rank;
+            numberRanks[number] = rank;
             currentRank += count2;
           }
-          return arr.map(function(number3) {
-            return numberRanks[number3];
+          return arr.map(function(number2) {
+            return numberRanks[number2];
           });
         };
         jStat4.mode = function mode(arr) {
@@ -38288,7 +38288,7 @@ var require_public_api = __commonJS({
       }
       return doc;
     }
-    function parse4(src, reviver, options) {
+    function parse3(src, reviver, options) {
       let _reviver = void 0;
       if (typeof reviver === "function") {
         _reviver = reviver;
@@ -38329,7 +38329,7 @@ var require_public_api = __commonJS({
         return value2.toString(options);
       return new Document.Document(value2, _replacer, options).toString(options);
     }
-    exports.parse = parse4;
+    exports.parse = parse3;
     exports.parseAllDocuments = parseAllDocuments;
     exports.parseDocument = parseDocument2;
     exports.stringify = stringify;
@@ -38750,7 +38750,7 @@ function expand(template, context3) {
     return template.replace(/\/$/, "");
   }
 }
-function parse2(options) {
+function parse(options) {
   let method = options.method.toUpperCase();
   let url = (options.url || "/").replace(/:([a-z]\w+)/g, "{$1}");
   let headers = Object.assign({}, options.headers);
@@ -38814,7 +38814,7 @@ function parse2(options) {
   );
 }
 function endpointWithDefaults(defaults2, route, options) {
-  return parse2(merge(defaults2, route, options));
+  return parse(merge(defaults2, route, options));
 }
 function withDefaults(oldDefaults, newDefaults) {
   const DEFAULTS2 = merge(oldDefaults, newDefaults);
@@ -38823,7 +38823,7 @@ function withDefaults(oldDefaults, newDefaults) {
     DEFAULTS: DEFAULTS2,
     defaults: withDefaults.bind(null, DEFAULTS2),
     merge: merge.bind(null, DEFAULTS2),
-    parse: parse2
+    parse
   });
 }
 var VERSION, userAgent, DEFAULTS, urlVariableRegex, endpoint;
@@ -38849,7 +38849,7 @@ var init_dist_bundle = __esm({
 });
 
 // node_modules/content-type/dist/index.js
-function parse3(header, options) {
+function parse2(header, options) {
   const stopFlags = SEMI_FLAG | (options?.comma === true ? COMMA_FLAG : 0);
   const len = header.length;
   let valueStart = options?.start ?? 0;
@@ -39533,7 +39533,7 @@ async function getResponseData(response) {
   if (!contentType) {
     return response.text().catch(noop);
   }
-  const mimetype = parse3(contentType);
+  const mimetype = parse2(contentType);
   if (isJSONResponse(mimetype)) {
     let text2 = "";
     try {
@@ -42964,8 +42964,8 @@ var require_light = __commonJS({
           return this.Promise.resolve();
         }
         yieldLoop(t = 0) {
-          return new this.Promise(function(resolve5, reject) {
-            return setTimeout(resolve5, t);
+          return new this.Promise(function(resolve6, reject) {
+            return setTimeout(resolve6, t);
           });
         }
         computePenalty() {
@@ -43176,15 +43176,15 @@ var require_light = __commonJS({
           return this._queue.length === 0;
         }
         async _tryToRun() {
-          var args, cb, error2, reject, resolve5, returned, task;
+          var args, cb, error2, reject, resolve6, returned, task;
           if (this._running < 1 && this._queue.length > 0) {
             this._running++;
-            ({ task, args, resolve: resolve5, reject } = this._queue.shift());
+            ({ task, args, resolve: resolve6, reject } = this._queue.shift());
             cb = await (async function() {
               try {
                 returned = await task(...args);
                 return function() {
-                  return resolve5(returned);
+                  return resolve6(returned);
                 };
               } catch (error1) {
                 error2 = error1;
@@ -43199,13 +43199,13 @@ var require_light = __commonJS({
           }
         }
         schedule(task, ...args) {
-          var promise, reject, resolve5;
-          resolve5 = reject = null;
+          var promise, reject, resolve6;
+          resolve6 = reject = null;
           promise = new this.Promise(function(_resolve, _reject) {
-            resolve5 = _resolve;
+            resolve6 = _resolve;
             return reject = _reject;
           });
-          this._queue.push({ task, args, resolve: resolve5, reject });
+          this._queue.push({ task, args, resolve: resolve6, reject });
           this._tryToRun();
           return promise;
         }
@@ -43606,14 +43606,14 @@ var require_light = __commonJS({
                 counts = this._states.counts;
                 return counts[0] + counts[1] + counts[2] + counts[3] === at;
               };
-              return new this.Promise((resolve5, reject) => {
+              return new this.Promise((resolve6, reject) => {
                 if (finished()) {
-                  return resolve5();
+                  return resolve6();
                 } else {
                   return this.on("done", () => {
                     if (finished()) {
                       this.removeAllListeners("done");
-                      return resolve5();
+                      return resolve6();
                     }
                   });
                 }
@@ -43706,9 +43706,9 @@ var require_light = __commonJS({
               options = parser$5.load(options, this.jobDefaults);
             }
             task = (...args2) => {
-              return new this.Promise(function(resolve5, reject) {
+              return new this.Promise(function(resolve6, reject) {
                 return fn(...args2, function(...args3) {
-                  return (args3[0] != null ? reject : resolve5)(args3);
+                  return (args3[0] != null ? reject : resolve6)(args3);
                 });
               });
             };
@@ -44010,11 +44010,11 @@ var require_lib = __commonJS({
     })();
     var __awaiter3 = exports && exports.__awaiter || function(thisArg, _arguments, P, generator) {
       function adopt(value2) {
-        return value2 instanceof P ? value2 : new P(function(resolve5) {
-          resolve5(value2);
+        return value2 instanceof P ? value2 : new P(function(resolve6) {
+          resolve6(value2);
         });
       }
-      return new (P || (P = Promise))(function(resolve5, reject) {
+      return new (P || (P = Promise))(function(resolve6, reject) {
         function fulfilled(value2) {
           try {
             step(generator.next(value2));
@@ -44030,7 +44030,7 @@ var require_lib = __commonJS({
           }
         }
         function step(result) {
-          result.done ? resolve5(result.value) : adopt(result.value).then(fulfilled, rejected);
+          result.done ? resolve6(result.value) : adopt(result.value).then(fulfilled, rejected);
         }
         step((generator = generator.apply(thisArg, _arguments || [])).next());
       });
@@ -44117,26 +44117,26 @@ var require_lib = __commonJS({
       }
       readBody() {
         return __awaiter3(this, void 0, void 0, function* () {
-          return new Promise((resolve5) => __awaiter3(this, void 0, void 0, function* () {
+          return new Promise((resolve6) => __awaiter3(this, void 0, void 0, function* () {
             let output = Buffer.alloc(0);
             this.message.on("data", (chunk) => {
               output = Buffer.concat([output, chunk]);
             });
             this.message.on("end", () => {
-              resolve5(output.toString());
+              resolve6(output.toString());
             });
           }));
         });
       }
       readBodyBuffer() {
         return __awaiter3(this, void 0, void 0, function* () {
-          return new Promise((resolve5) => __awaiter3(this, void 0, void 0, function* () {
+          return new Promise((resolve6) => __awaiter3(this, void 0, void 0, function* () {
             const chunks = [];
             this.message.on("data", (chunk) => {
               chunks.push(chunk);
             });
             this.message.on("end", () => {
-              resolve5(Buffer.concat(chunks));
+              resolve6(Buffer.concat(chunks));
             });
           }));
         });
@@ -44344,14 +44344,14 @@ var require_lib = __commonJS({
        */
       requestRaw(info2, data) {
         return __awaiter3(this, void 0, void 0, function* () {
-          return new Promise((resolve5, reject) => {
+          return new Promise((resolve6, reject) => {
             function callbackForResult(err2, res) {
               if (err2) {
                 reject(err2);
               } else if (!res) {
                 reject(new Error("Unknown error"));
               } else {
-                resolve5(res);
+                resolve6(res);
               }
             }
             this.requestRawWithCallback(info2, data, callbackForResult);
@@ -44595,12 +44595,12 @@ var require_lib = __commonJS({
         return __awaiter3(this, void 0, void 0, function* () {
           retryNumber = Math.min(ExponentialBackoffCeiling, retryNumber);
           const ms = ExponentialBackoffTimeSlice * Math.pow(2, retryNumber);
-          return new Promise((resolve5) => setTimeout(() => resolve5(), ms));
+          return new Promise((resolve6) => setTimeout(() => resolve6(), ms));
         });
       }
       _processResponse(res, options) {
         return __awaiter3(this, void 0, void 0, function* () {
-          return new Promise((resolve5, reject) => __awaiter3(this, void 0, void 0, function* () {
+          return new Promise((resolve6, reject) => __awaiter3(this, void 0, void 0, function* () {
             const statusCode = res.message.statusCode || 0;
             const response = {
               statusCode,
@@ -44608,7 +44608,7 @@ var require_lib = __commonJS({
               headers: {}
             };
             if (statusCode === HttpCodes2.NotFound) {
-              resolve5(response);
+              resolve6(response);
             }
             function dateTimeDeserializer(key, value2) {
               if (typeof value2 === "string") {
@@ -44647,7 +44647,7 @@ var require_lib = __commonJS({
               err2.result = response.result;
               reject(err2);
             } else {
-              resolve5(response);
+              resolve6(response);
             }
           }));
         });
@@ -44705,11 +44705,11 @@ var init_utils = __esm({
     import_undici2 = __toESM(require_undici(), 1);
     __awaiter2 = function(thisArg, _arguments, P, generator) {
       function adopt(value2) {
-        return value2 instanceof P ? value2 : new P(function(resolve5) {
-          resolve5(value2);
+        return value2 instanceof P ? value2 : new P(function(resolve6) {
+          resolve6(value2);
         });
       }
-      return new (P || (P = Promise))(function(resolve5, reject) {
+      return new (P || (P = Promise))(function(resolve6, reject) {
         function fulfilled(value2) {
           try {
             step(generator.next(value2));
@@ -44725,7 +44725,7 @@ var init_utils = __esm({
           }
         }
         function step(result) {
-          result.done ? resolve5(result.value) : adopt(result.value).then(fulfilled, rejected);
+          result.done ? resolve6(result.value) : adopt(result.value).then(fulfilled, rejected);
         }
         step((generator = generator.apply(thisArg, _arguments || [])).next());
       });
@@ -44957,11 +44957,11 @@ import { EOL as EOL3 } from "os";
 import { constants, promises } from "fs";
 var __awaiter = function(thisArg, _arguments, P, generator) {
   function adopt(value2) {
-    return value2 instanceof P ? value2 : new P(function(resolve5) {
-      resolve5(value2);
+    return value2 instanceof P ? value2 : new P(function(resolve6) {
+      resolve6(value2);
     });
   }
-  return new (P || (P = Promise))(function(resolve5, reject) {
+  return new (P || (P = Promise))(function(resolve6, reject) {
     function fulfilled(value2) {
       try {
         step(generator.next(value2));
@@ -44977,7 +44977,7 @@ var __awaiter = function(thisArg, _arguments, P, generator) {
       }
     }
     function step(result) {
-      result.done ? resolve5(result.value) : adopt(result.value).then(fulfilled, rejected);
+      result.done ? resolve6(result.value) : adopt(result.value).then(fulfilled, rejected);
     }
     step((generator = generator.apply(thisArg, _arguments || [])).next());
   });
@@ -45295,7 +45295,7 @@ function info(message) {
 }
 
 // src/entries/action/audit-mode.ts
-import { mkdir as mkdir4, writeFile as writeFile4 } from "node:fs/promises";
+import { mkdir as mkdir5, writeFile as writeFile5 } from "node:fs/promises";
 import { join as join5 } from "node:path";
 
 // src/report/format.ts
@@ -45603,7 +45603,7 @@ function displayValue(value2) {
 
 // src/io/audit-github.ts
 import { mkdtemp, rm as rm2 } from "node:fs/promises";
-import { join as join3 } from "node:path";
+import { join as join2 } from "node:path";
 
 // src/model/errors.ts
 function formatIssue(issue2) {
@@ -45629,12 +45629,12 @@ function quote(value2) {
 }
 var InputError = class extends Error {
   issues;
-  constructor(issues2) {
-    const shown = issues2.slice(0, 10).map(formatIssue);
-    const more = issues2.length > 10 ? [`\u2026and ${issues2.length - 10} more problems.`] : [];
+  constructor(issues) {
+    const shown = issues.slice(0, 10).map(formatIssue);
+    const more = issues.length > 10 ? [`\u2026and ${issues.length - 10} more problems.`] : [];
     super([...shown, ...more].join("\n"));
     this.name = "InputError";
-    this.issues = issues2;
+    this.issues = issues;
   }
 };
 var UsageError = class extends Error {
@@ -46154,8 +46154,16 @@ function readEntry(zip, entry, budget, label) {
     `more while inflating ${JSON.stringify(entry.name)}`,
     'Raise "archive-limit-mb" if the archive is genuine.'
   );
+  const corrupt = (detail) => refuse(
+    label,
+    `must hold readable data in ${JSON.stringify(entry.name)}`,
+    detail,
+    "The archive is damaged; upload it again."
+  );
   if (entry.method === 0) {
     if (data.length > budget.remaining) over();
+    if (data.length !== entry.size || data.length !== entry.compressedSize)
+      corrupt(`${data.length} stored bytes where its directory says ${entry.size}`);
     budget.remaining -= data.length;
     return data.slice();
   }
@@ -46169,10 +46177,15 @@ function readEntry(zip, entry, budget, label) {
     chunks.push(chunk);
   });
   const step = 64 * 1024;
-  for (let i2 = 0; i2 < data.length; i2 += step) {
-    inflater.push(data.subarray(i2, i2 + step), i2 + step >= data.length);
+  try {
+    for (let i2 = 0; i2 < data.length; i2 += step) {
+      inflater.push(data.subarray(i2, i2 + step), i2 + step >= data.length);
+    }
+    if (data.length === 0) inflater.push(new Uint8Array(0), true);
+  } catch (error2) {
+    if (error2 instanceof InputError) throw error2;
+    corrupt(`invalid deflate data (${error2 instanceof Error ? error2.message : String(error2)})`);
   }
-  if (data.length === 0) inflater.push(new Uint8Array(0), true);
   if (total !== entry.size) {
     refuse(
       label,
@@ -46291,12 +46304,123 @@ function predictionsEntry(runBytes, runName, entries) {
 // src/io/audit-side.ts
 import { createHash as createHash2 } from "node:crypto";
 import { mkdir as mkdir2, writeFile as writeFile2 } from "node:fs/promises";
-import { dirname as dirname2, join, posix as posix2 } from "node:path";
+import { dirname as dirname3, join, posix as posix2 } from "node:path";
 
 // src/io/load-run.ts
 import { createHash } from "node:crypto";
-import { readFile, stat as stat2 } from "node:fs/promises";
-import { dirname, relative, resolve, sep } from "node:path";
+import { lstat as lstat2 } from "node:fs/promises";
+import { dirname as dirname2, relative as relative2, resolve as resolve2, sep } from "node:path";
+
+// src/model/limits.ts
+var MAX_MAGNITUDE = 1e15;
+var MAX_CURVE_POINTS = 1e4;
+var MAX_JSON_DEPTH = 64;
+function formatLimit(value2) {
+  if (value2 !== 0 && (Math.abs(value2) >= 1e6 || Math.abs(value2) < 1e-6))
+    return value2.toExponential().replace("e+", "e");
+  return String(value2);
+}
+
+// src/model/settings.ts
+var FAIL_ON_VALUES = [
+  "worse-validation",
+  "toward-overfitting",
+  "toward-underfitting",
+  "worse-on-both",
+  "any-movement",
+  "slice-regression",
+  "high-bias",
+  "high-variance",
+  "data-mismatch",
+  "validation-overfit",
+  "guardrail-regression",
+  "guardrail-undetermined",
+  "none"
+];
+var COST_OUTCOME_FIELDS = /* @__PURE__ */ new Map([
+  ["train-seconds", "trainSeconds"],
+  ["inference-ms", "inferenceMs"],
+  ["parameters", "parameters"],
+  ["memory-mb", "memoryMb"]
+]);
+var COST_RATIO_OUTCOME = /^(train-seconds|inference-ms|parameters|memory-mb)-ratio>((?:0|[1-9][0-9]*)(?:\.[0-9]+)?)$/;
+function isFailOn(value2) {
+  return FAIL_ON_VALUES.includes(value2) || COST_RATIO_OUTCOME.test(value2);
+}
+var DEFAULT_SETTINGS = {
+  alpha: 0.05,
+  minEffect: 0,
+  gapTolerance: 0.1,
+  failOn: ["worse-validation"]
+};
+var NUMBER_SETTINGS = {
+  alpha: { min: 1e-6, max: 0.5, about: "significance level" },
+  "min-effect": { min: 0, max: MAX_MAGNITUDE, about: "smallest change that counts" },
+  "gap-tolerance": { min: 0, max: 1, about: "component present at this fraction of the error" },
+  reference: { min: -MAX_MAGNITUDE, max: MAX_MAGNITUDE, about: "reference level" }
+};
+var DECIMAL = /^[+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:[eE][+-]?\d+)?$/;
+function parseDecimal(text2) {
+  const trimmed = text2.trim();
+  if (!DECIMAL.test(trimmed)) return null;
+  const value2 = Number(trimmed);
+  return Number.isFinite(value2) ? value2 : null;
+}
+function rangeText(name) {
+  const { min, max: max2 } = NUMBER_SETTINGS[name];
+  return `must be a number from ${formatLimit(min)} to ${formatLimit(max2)}`;
+}
+function numberSettingIssues(name, value2, source) {
+  const { min, max: max2 } = NUMBER_SETTINGS[name];
+  if (Number.isFinite(value2) && value2 >= min && value2 <= max2) return [];
+  return [{ ...source, expected: rangeText(name), got: quote(value2) }];
+}
+function parseNumberSetting(name, text2, source) {
+  const value2 = parseDecimal(text2);
+  if (value2 === null)
+    return { issues: [{ ...source, expected: rangeText(name), got: quote(text2) }] };
+  const issues = numberSettingIssues(name, value2, source);
+  return issues.length > 0 ? { issues } : { value: value2 };
+}
+var FAIL_ON_SEPARATORS = /[,\n]/;
+function failOnIssues(values, source) {
+  const at = (i2) => source.pointer === "" ? "" : `${source.pointer}/${i2}`;
+  if (values.length === 0) {
+    return [
+      {
+        ...source,
+        expected: "must name at least one outcome",
+        got: "an empty list",
+        hint: "Write 'none' for a gate that never fails, or leave the setting out for the default (worse-validation)."
+      }
+    ];
+  }
+  const issues = values.flatMap(
+    (value2, i2) => isFailOn(value2) ? [] : [
+      {
+        ...source,
+        pointer: at(i2),
+        expected: `must be one of ${FAIL_ON_VALUES.join(", ")}, or FIELD-ratio>X (FIELD one of ${[...COST_OUTCOME_FIELDS.keys()].join(", ")})`,
+        got: quote(value2),
+        hint: "Separate outcomes with commas or new lines."
+      }
+    ]
+  );
+  if (issues.length === 0 && values.length > 1 && values.includes("none")) {
+    issues.push({
+      ...source,
+      pointer: at(values.indexOf("none")),
+      expected: "must not combine 'none' with other outcomes",
+      got: quote(values.join(","))
+    });
+  }
+  return issues;
+}
+function parseFailOn(text2, source) {
+  const values = text2.split(FAIL_ON_SEPARATORS).map((s) => s.trim()).filter((s) => s !== "");
+  const issues = failOnIssues(values, source);
+  return issues.length > 0 ? { issues } : { value: values };
+}
 
 // src/artifact/epoch-log.ts
 function splitCsvLine(line) {
@@ -46305,6 +46429,22 @@ function splitCsvLine(line) {
 function parseEpochLog(text2, file, mapping) {
   const lines = text2.replace(/^\uFEFF/, "").split(/\r?\n/);
   const header = splitCsvLine(lines[0] ?? "");
+  const seen = /* @__PURE__ */ new Map();
+  header.forEach((name, i2) => {
+    const first = seen.get(name);
+    if (first !== void 0) {
+      throw new InputError([
+        {
+          file,
+          pointer: "line 1",
+          expected: `must name each column once (column ${i2 + 1} repeats column ${first + 1})`,
+          got: quote(name),
+          hint: "Rename one of the columns; a repeated name makes the mapping ambiguous."
+        }
+      ]);
+    }
+    seen.set(name, i2);
+  });
   const column = (name, role) => {
     if (name === void 0) return void 0;
     const index = header.indexOf(name);
@@ -46325,21 +46465,22 @@ function parseEpochLog(text2, file, mapping) {
   const ti = column(mapping.train, "train");
   const vi = column(mapping.validation, "validation") ?? 0;
   const points = [];
-  const issues2 = [];
+  const issues = [];
   for (let i2 = 1; i2 < lines.length; i2++) {
     const raw = lines[i2] ?? "";
     if (raw.trim() === "") continue;
     const cells = splitCsvLine(raw);
     const read = (index, name) => {
       const cell = cells[index] ?? "";
-      const value2 = cell === "" ? Number.NaN : Number(cell);
-      if (!Number.isFinite(value2)) {
-        issues2.push({
+      const value2 = parseDecimal(cell) ?? Number.NaN;
+      if (!Number.isFinite(value2) || Math.abs(value2) > MAX_MAGNITUDE) {
+        issues.push({
           file,
           pointer: `line ${i2 + 1}`,
-          expected: `column "${name}" must be a finite number`,
+          expected: `column "${name}" must be a decimal number within \xB1${formatLimit(MAX_MAGNITUDE)}`,
           got: quote(cell)
         });
+        return Number.NaN;
       }
       return value2;
     };
@@ -46347,7 +46488,7 @@ function parseEpochLog(text2, file, mapping) {
     if (ti !== void 0 && mapping.train !== void 0) point.train = read(ti, mapping.train);
     const previous = points[points.length - 1];
     if (previous !== void 0 && Number.isFinite(point.x) && !(point.x > previous.x)) {
-      issues2.push({
+      issues.push({
         file,
         pointer: `line ${i2 + 1}`,
         expected: `column "${mapping.x}" must strictly increase (previous ${previous.x})`,
@@ -46355,12 +46496,134 @@ function parseEpochLog(text2, file, mapping) {
       });
     }
     points.push(point);
-    if (issues2.length >= 10) break;
+    if (issues.length >= 10) break;
+    if (points.length > MAX_CURVE_POINTS) {
+      issues.push({
+        file,
+        pointer: `line ${i2 + 1}`,
+        expected: `must have at most ${MAX_CURVE_POINTS} data rows (a curve's limit)`,
+        hint: "Log less often, or keep every n-th row."
+      });
+      break;
+    }
   }
-  if (issues2.length > 0) throw new InputError(issues2);
+  if (issues.length > 0) throw new InputError(issues);
   if (points.length === 0)
     throw new InputError([{ file, pointer: "", expected: "has no data rows under its header" }]);
   return points;
+}
+
+// src/validate/ajv-issues.ts
+function valueAt(doc, pointer) {
+  if (pointer === "") return doc;
+  let node = doc;
+  for (const raw of pointer.slice(1).split("/")) {
+    const key = raw.replace(/~1/g, "/").replace(/~0/g, "~");
+    if (node === null || typeof node !== "object") return void 0;
+    node = node[key];
+  }
+  return node;
+}
+function escapePointerToken(token) {
+  return token.replace(/~/g, "~0").replace(/\//g, "~1");
+}
+function typeName(value2) {
+  if (value2 === null) return "null";
+  if (Array.isArray(value2)) return "an array";
+  if (typeof value2 === "object") return "an object";
+  return `${typeof value2} ${quote(value2)}`;
+}
+function oneIssue(error2, file, doc) {
+  const pointer = error2.instancePath;
+  const value2 = valueAt(doc, pointer);
+  const params = error2.params;
+  switch (error2.keyword) {
+    case "required":
+      return {
+        file,
+        pointer: pointer === "" ? "/" : pointer,
+        expected: `must have the key "${String(params["missingProperty"])}"`,
+        hint: "Add it; see schema/fitgap-run-1.schema.json for the format."
+      };
+    case "additionalProperties": {
+      const key = String(params["additionalProperty"]);
+      return {
+        file,
+        pointer: `${pointer}/${escapePointerToken(key)}`,
+        expected: "is not a known key",
+        hint: "Check the spelling; unknown keys are rejected so that a typo cannot pass silently."
+      };
+    }
+    case "type":
+      return {
+        file,
+        pointer,
+        expected: `must be ${String(params["type"]) === "integer" ? "an integer" : `of type ${String(params["type"])}`}`,
+        got: typeName(value2),
+        ...params["type"] === "number" && typeof value2 === "string" ? { hint: "Write numbers without quotes." } : {}
+      };
+    case "enum":
+      return {
+        file,
+        pointer,
+        expected: `must be one of ${params["allowedValues"].map((v) => quote(v)).join(", ")}`,
+        got: quote(value2)
+      };
+    case "const":
+      return {
+        file,
+        pointer,
+        expected: `must be ${quote(params["allowedValue"])}`,
+        got: quote(value2)
+      };
+    case "format":
+      return {
+        file,
+        pointer,
+        expected: `must be a ${String(params["format"])} string`,
+        got: quote(value2),
+        ...params["format"] === "date-time" ? { hint: 'Use RFC 3339, e.g. "2026-11-30T10:00:00Z".' } : {}
+      };
+    default:
+      return {
+        file,
+        pointer,
+        expected: error2.message ?? `fails ${error2.keyword}`,
+        got: quote(value2)
+      };
+  }
+}
+function ajvIssues(errors, file, doc) {
+  const seen = /* @__PURE__ */ new Set();
+  const issues = [];
+  for (const error2 of errors) {
+    const issue2 = oneIssue(error2, file, doc);
+    const key = `${issue2.pointer}|${issue2.expected}`;
+    if (seen.has(key)) continue;
+    seen.add(key);
+    issues.push(issue2);
+  }
+  return issues;
+}
+function outOfRangeNumbers(doc, maxMagnitude, max2 = 10) {
+  const found = [];
+  const stack = [[doc, ""]];
+  while (stack.length > 0 && found.length < max2) {
+    const [node, pointer] = stack.pop();
+    if (typeof node === "number") {
+      if (!Number.isFinite(node) || Math.abs(node) > maxMagnitude)
+        found.push({ pointer, value: node });
+    } else if (Array.isArray(node)) {
+      for (let i2 = node.length - 1; i2 >= 0; i2--) stack.push([node[i2], `${pointer}/${i2}`]);
+    } else if (node !== null && typeof node === "object") {
+      const entries = Object.entries(node);
+      for (let i2 = entries.length - 1; i2 >= 0; i2--) {
+        const [k, v] = entries[i2];
+        stack.push([v, `${pointer}/${escapePointerToken(k)}`]);
+      }
+    }
+  }
+  return found;
 }
 
 // src/artifact/read-json.ts
@@ -46386,13 +46649,79 @@ function errorOffset(text2, message) {
   }
   return null;
 }
-function parseJson(text2, file) {
+var QUOTE = 34;
+var BACKSLASH = 92;
+function decodeKey(raw) {
+  if (!raw.includes("\\")) return raw;
   try {
-    return JSON.parse(text2.charCodeAt(0) === 65279 ? text2.slice(1) : text2);
+    return JSON.parse(`"${raw}"`);
+  } catch {
+    return null;
+  }
+}
+function scanStructure(text2, maxDepth = MAX_JSON_DEPTH) {
+  const stack = [];
+  const duplicates = [];
+  const pointer = () => stack.slice(0, -1).map((f) => `/${f.object ? escapePointerToken(f.at) : String(f.index)}`).join("");
+  for (let i2 = 0; i2 < text2.length; i2++) {
+    const c = text2.charCodeAt(i2);
+    if (c === QUOTE) {
+      const start = i2 + 1;
+      i2++;
+      while (i2 < text2.length && text2.charCodeAt(i2) !== QUOTE) {
+        if (text2.charCodeAt(i2) === BACKSLASH) i2++;
+        i2++;
+      }
+      const top = stack[stack.length - 1];
+      if (top?.object === true && top.expectKey) {
+        const key = decodeKey(text2.slice(start, i2));
+        top.expectKey = false;
+        if (key !== null) {
+          top.at = key;
+          if (top.keys.has(key) && duplicates.length < 10) {
+            duplicates.push({ pointer: `${pointer()}/${escapePointerToken(key)}`, key });
+          }
+          top.keys.add(key);
+        }
+      }
+      continue;
+    }
+    if (c === 123 || c === 91) {
+      if (stack.length >= maxDepth) return { tooDeep: i2, duplicates };
+      stack.push({ object: c === 123, keys: /* @__PURE__ */ new Set(), at: "", index: 0, expectKey: c === 123 });
+    } else if (c === 125 || c === 93) {
+      stack.pop();
+    } else if (c === 44) {
+      const top = stack[stack.length - 1];
+      if (top !== void 0) {
+        if (top.object) top.expectKey = true;
+        else top.index++;
+      }
+    }
+  }
+  return { tooDeep: -1, duplicates };
+}
+function parseJson(text2, file) {
+  const body = text2.charCodeAt(0) === 65279 ? text2.slice(1) : text2;
+  const structure = scanStructure(body);
+  if (structure.tooDeep >= 0) {
+    const where = lineAndColumn(body, structure.tooDeep);
+    throw new InputError([
+      {
+        file,
+        pointer: `line ${where.line}, column ${where.column}`,
+        expected: `must not nest arrays and objects more than ${MAX_JSON_DEPTH} levels deep`,
+        hint: "A run artifact nests about five levels; flatten deep hyperparameter values."
+      }
+    ]);
+  }
+  let doc;
+  try {
+    doc = JSON.parse(body);
   } catch (error2) {
     const message = error2 instanceof Error ? error2.message : String(error2);
-    const offset = errorOffset(text2, message);
-    const where = offset === null ? void 0 : lineAndColumn(text2, offset);
+    const offset = errorOffset(body, message);
+    const where = offset === null ? void 0 : lineAndColumn(body, offset);
     throw new InputError([
       {
         file,
@@ -46403,6 +46732,18 @@ function parseJson(text2, file) {
       }
     ]);
   }
+  if (structure.duplicates.length > 0) {
+    throw new InputError(
+      structure.duplicates.map(({ pointer, key }) => ({
+        file,
+        pointer,
+        expected: "must appear once in its object",
+        got: `the key ${quote(key)} again`,
+        hint: "JSON keeps only the last of duplicate keys; remove the one you did not mean."
+      }))
+    );
+  }
+  return doc;
 }
 
 // src/validate/run.ts
@@ -46721,119 +47062,15 @@ var fitgap_run_1_schema_default = {
   }
 };
 
-// src/validate/ajv-issues.ts
-function valueAt(doc, pointer) {
-  if (pointer === "") return doc;
-  let node = doc;
-  for (const raw of pointer.slice(1).split("/")) {
-    const key = raw.replace(/~1/g, "/").replace(/~0/g, "~");
-    if (node === null || typeof node !== "object") return void 0;
-    node = node[key];
-  }
-  return node;
-}
-function escapePointerToken(token) {
-  return token.replace(/~/g, "~0").replace(/\//g, "~1");
-}
-function typeName(value2) {
-  if (value2 === null) return "null";
-  if (Array.isArray(value2)) return "an array";
-  if (typeof value2 === "object") return "an object";
-  return `${typeof value2} ${quote(value2)}`;
-}
-function oneIssue(error2, file, doc) {
-  const pointer = error2.instancePath;
-  const value2 = valueAt(doc, pointer);
-  const params = error2.params;
-  switch (error2.keyword) {
-    case "required":
-      return {
-        file,
-        pointer: pointer === "" ? "/" : pointer,
-        expected: `must have the key "${String(params["missingProperty"])}"`,
-        hint: "Add it; see schema/fitgap-run-1.schema.json for the format."
-      };
-    case "additionalProperties": {
-      const key = String(params["additionalProperty"]);
-      return {
-        file,
-        pointer: `${pointer}/${escapePointerToken(key)}`,
-        expected: "is not a known key",
-        hint: "Check the spelling; unknown keys are rejected so that a typo cannot pass silently."
-      };
-    }
-    case "type":
-      return {
-        file,
-        pointer,
-        expected: `must be ${String(params["type"]) === "integer" ? "an integer" : `of type ${String(params["type"])}`}`,
-        got: typeName(value2),
-        ...params["type"] === "number" && typeof value2 === "string" ? { hint: "Write numbers without quotes." } : {}
-      };
-    case "enum":
-      return {
-        file,
-        pointer,
-        expected: `must be one of ${params["allowedValues"].map((v) => quote(v)).join(", ")}`,
-        got: quote(value2)
-      };
-    case "const":
-      return {
-        file,
-        pointer,
-        expected: `must be ${quote(params["allowedValue"])}`,
-        got: quote(value2)
-      };
-    case "format":
-      return {
-        file,
-        pointer,
-        expected: `must be a ${String(params["format"])} string`,
-        got: quote(value2),
-        ...params["format"] === "date-time" ? { hint: 'Use RFC 3339, e.g. "2026-11-30T10:00:00Z".' } : {}
-      };
-    default:
-      return {
-        file,
-        pointer,
-        expected: error2.message ?? `fails ${error2.keyword}`,
-        got: quote(value2)
-      };
-  }
-}
-function ajvIssues(errors, file, doc) {
-  const seen = /* @__PURE__ */ new Set();
-  const issues2 = [];
-  for (const error2 of errors) {
-    const issue2 = oneIssue(error2, file, doc);
-    const key = `${issue2.pointer}|${issue2.expected}`;
-    if (seen.has(key)) continue;
-    seen.add(key);
-    issues2.push(issue2);
-  }
-  return issues2;
-}
-function nonFiniteNumbers(doc, pointer = "") {
-  if (typeof doc === "number") return Number.isFinite(doc) ? [] : [pointer];
-  if (Array.isArray(doc))
-    return doc.flatMap((item, i2) => nonFiniteNumbers(item, `${pointer}/${i2}`));
-  if (doc !== null && typeof doc === "object") {
-    return Object.entries(doc).flatMap(
-      ([k, v]) => nonFiniteNumbers(v, `${pointer}/${escapePointerToken(k)}`)
-    );
-  }
-  return [];
-}
-
 // src/validate/guardrails.ts
 function guardrailIssues(run, file) {
-  const issues2 = [];
+  const issues = [];
   const names2 = /* @__PURE__ */ new Map();
   run.guardrails?.forEach((guardrail, g) => {
     const at = `/guardrails/${g}`;
     const first = names2.get(guardrail.metric.name);
     if (first !== void 0) {
-      issues2.push({
+      issues.push({
         file,
         pointer: `${at}/metric/name`,
         expected: `must be unique among the guardrails (also at /guardrails/${first}/metric/name)`,
@@ -46841,7 +47078,7 @@ function guardrailIssues(run, file) {
       });
     } else names2.set(guardrail.metric.name, g);
     if (guardrail.metric.name === run.metric.name) {
-      issues2.push({
+      issues.push({
         file,
         pointer: `${at}/metric/name`,
         expected: "must differ from the primary metric",
@@ -46852,7 +47089,7 @@ function guardrailIssues(run, file) {
     for (const [split, values] of Object.entries(guardrail.splits)) {
       values.values.forEach((v, i2) => {
         if (guardrail.metric.kind === "proportion" && (v < 0 || v > 1)) {
-          issues2.push({
+          issues.push({
             file,
             pointer: `${at}/splits/${split}/values/${i2}`,
             expected: "must be within [0, 1] for a proportion metric",
@@ -46863,7 +47100,7 @@ function guardrailIssues(run, file) {
       });
     }
   });
-  return issues2;
+  return issues;
 }
 
 // src/model/run.ts
@@ -46882,18 +47119,18 @@ var addFormats = typeof formatsModule === "function" ? formatsModule : formatsMo
 var compiled;
 function validator() {
   if (compiled === void 0) {
-    const ajv2 = new import__.Ajv2020({ allErrors: true, strict: true, strictNumbers: true });
-    addFormats(ajv2, ["date-time"]);
-    compiled = ajv2.compile(fitgap_run_1_schema_default);
+    const ajv = new import__.Ajv2020({ allErrors: true, strict: true, strictNumbers: true });
+    addFormats(ajv, ["date-time"]);
+    compiled = ajv.compile(fitgap_run_1_schema_default);
   }
   return compiled;
 }
 function semanticIssues(run, file) {
-  const issues2 = [];
+  const issues = [];
   const proportion = run.metric.kind === "proportion";
   const inUnit = (value2, pointer) => {
     if (proportion && (value2 < 0 || value2 > 1)) {
-      issues2.push({
+      issues.push({
         file,
         pointer,
         expected: "must be within [0, 1] for a proportion metric",
@@ -46908,7 +47145,7 @@ function semanticIssues(run, file) {
     if (split === void 0) continue;
     split.values.forEach((v, i2) => inUnit(v, `/splits/${name}/values/${i2}`));
     if (split.values.length !== repeats) {
-      issues2.push({
+      issues.push({
         file,
         pointer: `/splits/${name}/values`,
         expected: `must have one value per repeat, as many as /splits/train/values (${repeats})`,
@@ -46921,12 +47158,22 @@ function semanticIssues(run, file) {
   for (const name of CURVE_NAMES) {
     const curve = run.curves?.[name];
     if (curve === void 0) continue;
+    if (curve.length > MAX_CURVE_POINTS) {
+      issues.push({
+        file,
+        pointer: `/curves/${name}`,
+        expected: `must have at most ${MAX_CURVE_POINTS} points`,
+        got: `${curve.length} points`,
+        hint: "Log the curve less often, or keep every n-th point before writing the artifact."
+      });
+      continue;
+    }
     curve.forEach((point, i2) => {
       const at = `/curves/${name}/${i2}`;
       inUnit(point.validation, `${at}/validation`);
       if (point.train !== void 0) inUnit(point.train, `${at}/train`);
       if (name === "regularization" && point.x <= 0) {
-        issues2.push({
+        issues.push({
           file,
           pointer: `${at}/x`,
           expected: "must be > 0 (the regularization curve is read on a log axis)",
@@ -46935,7 +47182,7 @@ function semanticIssues(run, file) {
         });
       }
       if (name === "training_examples" && point.x <= 0) {
-        issues2.push({
+        issues.push({
           file,
           pointer: `${at}/x`,
           expected: "must be > 0 (a count of training examples)",
@@ -46944,7 +47191,7 @@ function semanticIssues(run, file) {
       }
       const previous = curve[i2 - 1];
       if (previous !== void 0 && !(point.x > previous.x)) {
-        issues2.push({
+        issues.push({
           file,
           pointer: `${at}/x`,
           expected: `must be greater than the previous point's x (${previous.x}); curve x must strictly increase`,
@@ -46962,7 +47209,7 @@ function semanticIssues(run, file) {
   run.slices?.forEach((slice, i2) => {
     const first = names2.get(slice.name);
     if (first !== void 0) {
-      issues2.push({
+      issues.push({
         file,
         pointer: `/slices/${i2}/name`,
         expected: `must be unique (also at /slices/${first}/name)`,
@@ -46973,7 +47220,7 @@ function semanticIssues(run, file) {
   if (run.predictions !== void 0) {
     const p = run.predictions.path;
     if (p.startsWith("/") || /^[A-Za-z]:[\\/]/.test(p) || p.split(/[\\/]/).includes("..")) {
-      issues2.push({
+      issues.push({
         file,
         pointer: "/predictions/path",
         expected: "must be a relative path inside the artifact's folder",
@@ -46982,63 +47229,331 @@ function semanticIssues(run, file) {
       });
     }
   }
-  issues2.push(...guardrailIssues(run, file));
-  return issues2;
+  issues.push(...guardrailIssues(run, file));
+  return issues;
 }
 function validateRun(doc, file) {
-  const nonFinite = nonFiniteNumbers(doc);
-  if (nonFinite.length > 0) {
+  const numbers = outOfRangeNumbers(doc, MAX_MAGNITUDE);
+  if (numbers.length > 0) {
     throw new InputError(
-      nonFinite.map((pointer) => ({
-        file,
-        pointer,
-        expected: "must be a finite number",
-        got: "a number too large to represent (Infinity)",
-        hint: "Write the measured value; JSON numbers such as 1e999 overflow."
-      }))
+      numbers.map(
+        ({ pointer, value: value2 }) => Number.isFinite(value2) ? {
+          file,
+          pointer,
+          expected: `must be within \xB1${formatLimit(MAX_MAGNITUDE)}`,
+          got: quote(value2),
+          hint: pointer.startsWith("/hyperparameters/") ? "Write large identifiers (seeds, hashes) as strings." : "Rescale the metric (thousands instead of units); larger values overflow in the statistics."
+        } : {
+          file,
+          pointer,
+          expected: "must be a finite number",
+          got: "a number too large to represent (Infinity)",
+          hint: "Write the measured value; JSON numbers such as 1e999 overflow."
+        }
+      )
     );
   }
   const validate = validator();
   if (!validate(doc)) {
     throw new InputError(ajvIssues(validate.errors ?? [], file, doc));
   }
-  const issues2 = semanticIssues(doc, file);
-  if (issues2.length > 0) throw new InputError(issues2);
+  const issues = semanticIssues(doc, file);
+  if (issues.length > 0) throw new InputError(issues);
   return doc;
 }
 
-// src/io/load-run.ts
-async function readText(path, file, what) {
-  try {
-    return await readFile(path);
-  } catch (error2) {
-    const code = error2.code;
-    throw new InputError([
-      {
-        file,
-        pointer: "",
-        expected: `could not be read as ${what}`,
-        got: code === "ENOENT" ? "no such file" : code === "EISDIR" ? "a directory" : code ?? String(error2),
-        hint: "Check the path."
-      }
-    ]);
+// src/io/open-untrusted.ts
+import { constants as constants3 } from "node:fs";
+import { open as open2, realpath } from "node:fs/promises";
+import { Readable } from "node:stream";
+import { dirname, isAbsolute, relative, resolve } from "node:path";
+var MIB = 1024 * 1024;
+var DEFAULT_FILE_LIMITS = {
+  artifactBytes: 16 * MIB,
+  configBytes: 1 * MIB,
+  csvBytes: 512 * MIB
+};
+var LIMIT_NAMES = {
+  artifactBytes: { option: "max-artifact-mb", config: "artifact-mb" },
+  configBytes: { option: "max-config-mb", config: null },
+  csvBytes: { option: "max-csv-mb", config: "csv-mb" }
+};
+var LIMIT_RANGES_MB = {
+  artifactBytes: { min: 1e-3, max: 1024 },
+  configBytes: { min: 1e-3, max: 64 },
+  csvBytes: { min: 1e-3, max: 65536 }
+};
+function parseLimitMb(key, text2, label) {
+  const { min, max: max2 } = LIMIT_RANGES_MB[key];
+  const value2 = /^\s*(?:\d+(?:\.\d*)?|\.\d+)\s*$/.test(text2) ? Number(text2) : Number.NaN;
+  if (!(value2 >= min && value2 <= max2)) {
+    return {
+      issues: [
+        {
+          file: label,
+          pointer: "",
+          expected: `must be a number of MB from ${min} to ${max2}`,
+          got: JSON.stringify(text2)
+        }
+      ]
+    };
+  }
+  return { bytes: Math.round(value2 * MIB) };
+}
+var LIMIT_HINTS = {
+  artifactBytes: 'Raise the limit with --max-artifact-mb (action input "max-artifact-mb", config limits.artifact-mb) if the file is genuine.',
+  configBytes: 'Raise the limit with --max-config-mb (action input "max-config-mb") if the file is genuine.',
+  csvBytes: 'Raise the limit with --max-csv-mb (action input "max-csv-mb", config limits.csv-mb) if the file is genuine.'
+};
+var READ_CHUNK = 64 * 1024;
+var MissingFileError = class extends InputError {
+};
+function refuse2(target, expected, got, hint) {
+  const issue2 = { file: target.file, pointer: "", expected };
+  if (got !== void 0) issue2.got = got;
+  if (hint !== void 0) issue2.hint = hint;
+  throw new InputError([issue2]);
+}
+function describeCode(code) {
+  switch (code) {
+    case "ENOENT":
+      return "no such file";
+    case "EACCES":
+    case "EPERM":
+      return "permission denied";
+    case "ELOOP":
+      return "a symbolic link where none may be (or a loop of links)";
+    case "EISDIR":
+      return "a folder";
+    case "ENOTDIR":
+      return "a path through something that is not a folder";
+    case "ENXIO":
+      return "a socket or a device without a reader";
+    case "ENAMETOOLONG":
+      return "a name too long for the file system";
+    case "EIO":
+      return "an input/output error";
+    case "EMFILE":
+    case "ENFILE":
+      return "too many open files";
+    default:
+      return code ?? "an unknown error";
   }
 }
+function errorCode(error2) {
+  return error2?.code;
+}
+function isInside(folder, path) {
+  const rel = relative(folder, path);
+  return rel !== "" && !rel.startsWith("..") && !isAbsolute(rel);
+}
+function kindOf(stats) {
+  if (stats.isDirectory()) return "a folder";
+  if (stats.isFIFO()) return "a named pipe (FIFO)";
+  if (stats.isSocket()) return "a socket";
+  if (stats.isCharacterDevice() || stats.isBlockDevice()) return "a device";
+  if (stats.isSymbolicLink()) return "a symbolic link";
+  return "not a regular file";
+}
+var MB = (bytes) => `${Math.round(bytes / MIB * 1e3) / 1e3} MB`;
+async function openChecked(target) {
+  const path = resolve(target.path);
+  const where = `could not be read as ${target.what}`;
+  let folder;
+  let real;
+  try {
+    folder = await realpath(resolve(target.folder ?? dirname(path)));
+    real = await realpath(path);
+  } catch (error2) {
+    const code = errorCode(error2);
+    if (code === "ENOENT")
+      throw new MissingFileError([
+        {
+          file: target.file,
+          pointer: "",
+          expected: where,
+          got: "no such file",
+          hint: "Check the path."
+        }
+      ]);
+    refuse2(target, where, describeCode(code), "Check the path.");
+  }
+  if (!isInside(folder, real)) {
+    refuse2(
+      target,
+      `must be a file inside ${target.folder === void 0 ? "the folder it is named in" : "the artifact's folder"}`,
+      "a link that leads outside it",
+      "Copy the file there instead of linking to it."
+    );
+  }
+  let handle;
+  try {
+    handle = await open2(
+      real,
+      constants3.O_RDONLY | constants3.O_NOFOLLOW | constants3.O_NONBLOCK | constants3.O_NOCTTY
+    );
+  } catch (error2) {
+    refuse2(target, where, describeCode(errorCode(error2)), "Check the path and its permissions.");
+  }
+  try {
+    const stats = await handle.stat();
+    if (!stats.isFile()) refuse2(target, "must be a regular file", kindOf(stats));
+    const opened = await realpath(`/proc/self/fd/${handle.fd}`).catch(() => null);
+    if (opened !== null && opened !== real && !isInside(folder, opened)) {
+      refuse2(target, "must not change while it is opened", "a path that moved outside its folder");
+    }
+    const max2 = target.limits[target.limit];
+    if (stats.size > max2) {
+      refuse2(
+        target,
+        `must be at most ${MB(max2)} (${max2} bytes)`,
+        `${stats.size} bytes`,
+        LIMIT_HINTS[target.limit]
+      );
+    }
+    return { handle, size: stats.size, realPath: real, id: `${stats.dev}:${stats.ino}` };
+  } catch (error2) {
+    await handle.close().catch(() => void 0);
+    throw error2;
+  }
+}
+function grew(target) {
+  refuse2(
+    target,
+    "must be a regular file of fixed size",
+    "more bytes than its size promised",
+    "Files that change while read (logs being written, files under /proc) are refused; copy it first."
+  );
+}
+async function readAt(target, handle, buffer, at) {
+  try {
+    const { bytesRead } = await handle.read(buffer, 0, buffer.length, at);
+    return bytesRead;
+  } catch (error2) {
+    refuse2(target, `could not be read as ${target.what}`, describeCode(errorCode(error2)));
+  }
+}
+async function readChecked(target) {
+  const file = await openChecked(target);
+  try {
+    const bytes = Buffer.alloc(file.size);
+    let at = 0;
+    while (at < file.size) {
+      const n = await readAt(target, file.handle, bytes.subarray(at), at);
+      if (n === 0) break;
+      at += n;
+    }
+    if (await readAt(target, file.handle, Buffer.alloc(1), at) > 0) grew(target);
+    return { bytes: at === file.size ? bytes : bytes.subarray(0, at), file };
+  } finally {
+    await file.handle.close().catch(() => void 0);
+  }
+}
+async function streamChecked(target) {
+  const file = await openChecked(target);
+  async function* chunks() {
+    try {
+      let at = 0;
+      while (at < file.size) {
+        const buffer = Buffer.alloc(Math.min(READ_CHUNK, file.size - at));
+        const n = await readAt(target, file.handle, buffer, at);
+        if (n === 0) return;
+        at += n;
+        yield n === buffer.length ? buffer : buffer.subarray(0, n);
+      }
+      if (await readAt(target, file.handle, Buffer.alloc(1), at) > 0) grew(target);
+    } finally {
+      await file.handle.close().catch(() => void 0);
+    }
+  }
+  return { stream: Readable.from(chunks(), { objectMode: false }), file };
+}
+function firstInvalidUtf8(bytes) {
+  let i2 = 0;
+  while (i2 < bytes.length) {
+    const b = bytes[i2] ?? 0;
+    if (b < 128) {
+      i2++;
+      continue;
+    }
+    let need;
+    let low = 128;
+    let high = 191;
+    if (b >= 194 && b <= 223) need = 1;
+    else if (b >= 224 && b <= 239) {
+      need = 2;
+      if (b === 224) low = 160;
+      if (b === 237) high = 159;
+    } else if (b >= 240 && b <= 244) {
+      need = 3;
+      if (b === 240) low = 144;
+      if (b === 244) high = 143;
+    } else return i2;
+    for (let k = 1; k <= need; k++) {
+      const c = bytes[i2 + k];
+      if (c === void 0 || c < (k === 1 ? low : 128) || c > (k === 1 ? high : 191)) return i2;
+    }
+    i2 += need + 1;
+  }
+  return -1;
+}
+function decodeUtf8(bytes, file, what) {
+  const bad = firstInvalidUtf8(bytes);
+  if (bad < 0)
+    return Buffer.from(bytes.buffer, bytes.byteOffset, bytes.byteLength).toString("utf8");
+  let line = 1;
+  for (let i2 = 0; i2 < bad; i2++) if (bytes[i2] === 10) line++;
+  throw new InputError([
+    {
+      file,
+      pointer: `line ${line}`,
+      expected: `must be UTF-8 text (${what})`,
+      got: "an invalid UTF-8 sequence",
+      hint: bytes[0] === 255 && bytes[1] === 254 || bytes[0] === 254 && bytes[1] === 255 ? "The file looks like UTF-16; save it as UTF-8." : "Save the file as UTF-8."
+    }
+  ]);
+}
+
+// src/io/load-run.ts
 function besideArtifact(artifactPath, name) {
-  const folder = resolve(dirname(artifactPath));
-  const target = resolve(folder, name);
-  const rel = relative(folder, target);
-  if (rel === "" || rel.startsWith("..") || rel.includes(`..${sep}`) || resolve(folder, rel) !== target)
+  const folder = resolve2(dirname2(artifactPath));
+  const target = resolve2(folder, name);
+  const rel = relative2(folder, target);
+  if (rel === "" || rel.startsWith("..") || rel.includes(`..${sep}`) || resolve2(folder, rel) !== target)
     return null;
   return target;
 }
+function besideName(file, name) {
+  return `${dirname2(file) === "." ? "" : `${dirname2(file)}/`}${name}`;
+}
+function predictionsSource(target, track) {
+  return {
+    file: target.file,
+    open: async () => {
+      const { stream } = await streamChecked(target);
+      track?.(stream);
+      return stream;
+    }
+  };
+}
 async function loadRun(path, options = {}) {
   const file = options.displayName ?? path;
-  const bytes = await readText(path, file, "a run artifact (JSON)");
+  const limits = options.limits ?? DEFAULT_FILE_LIMITS;
+  const folder = dirname2(resolve2(path));
+  const { bytes, file: checked } = await readChecked({
+    path,
+    file,
+    what: "a run artifact (JSON)",
+    limit: "artifactBytes",
+    limits
+  });
+  const read = [{ realPath: checked.realPath, id: checked.id }];
   const sha2562 = createHash("sha256").update(bytes).digest("hex");
-  const artifact = validateRun(parseJson(bytes.toString("utf8"), file), file);
+  const text2 = decodeUtf8(bytes, file, "a run artifact");
+  const artifact = validateRun(parseJson(text2, file), file);
   const notes = [];
   let predictionsPath = null;
+  let predictions = null;
   if (artifact.predictions !== void 0) {
     predictionsPath = besideArtifact(path, artifact.predictions.path);
     const issue2 = {
@@ -47049,33 +47564,55 @@ async function loadRun(path, options = {}) {
       hint: 'Put the predictions CSV next to the artifact, or remove "predictions".'
     };
     if (predictionsPath === null) throw new InputError([issue2]);
-    const info2 = await stat2(predictionsPath).catch(() => null);
-    if (info2 === null || !info2.isFile())
-      throw new InputError([
-        { ...issue2, expected: "must name an existing file next to the artifact" }
-      ]);
+    const target = {
+      path: predictionsPath,
+      file: besideName(file, artifact.predictions.path),
+      what: "a predictions CSV",
+      folder,
+      limit: "csvBytes",
+      limits
+    };
+    const first = await openChecked(target).catch((error2) => {
+      if (error2 instanceof MissingFileError)
+        throw new InputError([
+          { ...issue2, expected: "must name an existing file next to the artifact" }
+        ]);
+      throw error2;
+    });
+    await first.handle.close();
+    read.push({ realPath: first.realPath, id: first.id });
+    predictions = predictionsSource(target, options.track);
   }
   if (options.epochLog !== void 0) {
     const logPath = besideArtifact(path, options.epochLog.file);
-    const logName = `${dirname(file) === "." ? "" : `${dirname(file)}/`}${options.epochLog.file}`;
-    const info2 = logPath === null ? null : await stat2(logPath).catch(() => null);
-    if (logPath !== null && info2?.isFile() === true) {
+    const logName = besideName(file, options.epochLog.file);
+    const present = logPath !== null && await lstat2(logPath).catch(() => null) !== null;
+    if (logPath !== null && present) {
       if (artifact.curves?.epochs !== void 0) {
         notes.push({ code: "epoch-log-not-used", file, log: logName });
       } else {
-        const text2 = (await readText(logPath, logName, "an epoch log (CSV)")).toString("utf8");
+        const log = await readChecked({
+          path: logPath,
+          file: logName,
+          what: "an epoch log (CSV)",
+          folder,
+          limit: "artifactBytes",
+          limits
+        });
+        read.push({ realPath: log.file.realPath, id: log.file.id });
+        const logText = decodeUtf8(log.bytes, logName, "an epoch log");
         artifact.curves = {
           ...artifact.curves,
-          epochs: parseEpochLog(text2, logName, options.epochLog)
+          epochs: parseEpochLog(logText, logName, options.epochLog)
         };
-        const issues2 = semanticIssues(artifact, `${file} (with ${logName})`);
-        if (issues2.length > 0) throw new InputError(issues2);
+        const issues = semanticIssues(artifact, `${file} (with ${logName})`);
+        if (issues.length > 0) throw new InputError(issues);
       }
     } else {
       notes.push({ code: "epoch-log-missing", file, log: logName });
     }
   }
-  return { artifact, file, sha256: sha2562, predictionsPath, notes };
+  return { artifact, file, sha256: sha2562, predictionsPath, predictions, notes, read };
 }
 
 // src/io/audit-side.ts
@@ -47115,7 +47652,7 @@ function sha256(bytes) {
 async function loadSide(options) {
   for (const file of [options.artifact, ...options.beside]) {
     const target = join(options.dir, ...file.path.split("/"));
-    await mkdir2(dirname2(target), { recursive: true });
+    await mkdir2(dirname3(target), { recursive: true });
     await writeFile2(target, file.bytes);
   }
   return loadRun(join(options.dir, ...options.artifact.path.split("/")), {
@@ -47135,40 +47672,7 @@ function sideSources(commit, artifact, beside, from) {
 
 // src/io/review-from-files.ts
 import { createHash as createHash3 } from "node:crypto";
-import { dirname as dirname3, join as join2, resolve as resolve2 } from "node:path";
-
-// src/model/settings.ts
-var FAIL_ON_VALUES = [
-  "worse-validation",
-  "toward-overfitting",
-  "toward-underfitting",
-  "worse-on-both",
-  "any-movement",
-  "slice-regression",
-  "high-bias",
-  "high-variance",
-  "data-mismatch",
-  "validation-overfit",
-  "guardrail-regression",
-  "guardrail-undetermined",
-  "none"
-];
-var COST_OUTCOME_FIELDS = /* @__PURE__ */ new Map([
-  ["train-seconds", "trainSeconds"],
-  ["inference-ms", "inferenceMs"],
-  ["parameters", "parameters"],
-  ["memory-mb", "memoryMb"]
-]);
-var COST_RATIO_OUTCOME = /^(train-seconds|inference-ms|parameters|memory-mb)-ratio>((?:0|[1-9][0-9]*)(?:\.[0-9]+)?)$/;
-function isFailOn(value2) {
-  return FAIL_ON_VALUES.includes(value2) || COST_RATIO_OUTCOME.test(value2);
-}
-var DEFAULT_SETTINGS = {
-  alpha: 0.05,
-  minEffect: 0,
-  gapTolerance: 0.1,
-  failOn: ["worse-validation"]
-};
+import { resolve as resolve3 } from "node:path";
 
 // src/stats/distributions.ts
 var import_jstat = __toESM(require_jstat(), 1);
@@ -49530,7 +50034,6 @@ function pairedSummary(paired) {
 }
 
 // src/artifact/predictions.ts
-import { createReadStream } from "node:fs";
 import { createInterface } from "node:readline";
 var HEADER = { proportion: "id,correct", continuous: "id,loss" };
 function hashId(id) {
@@ -49565,23 +50068,27 @@ var HashLog = class {
 };
 function parseValue(raw, kind, file, line) {
   const column = kind === "proportion" ? "correct" : "loss";
-  const value2 = raw.trim() === "" ? Number.NaN : Number(raw);
-  if (kind === "proportion" ? value2 !== 0 && value2 !== 1 : !Number.isFinite(value2)) {
+  const text2 = raw.trim();
+  const value2 = kind === "proportion" ? text2 === "0" || text2 === "1" ? Number(text2) : Number.NaN : parseDecimal(text2) ?? Number.NaN;
+  if (!Number.isFinite(value2) || Math.abs(value2) > MAX_MAGNITUDE) {
     throw new InputError([
       {
         file,
         pointer: `line ${line}`,
-        expected: kind === "proportion" ? `column "${column}" must be 1 or 0` : `column "${column}" must be a finite number`,
+        expected: kind === "proportion" ? `column "${column}" must be 1 or 0` : `column "${column}" must be a decimal number within \xB11e15`,
         got: quote(raw)
       }
     ]);
   }
   return value2;
 }
-async function* readRows(path, file, kind, hashes) {
-  const stream = createReadStream(path, { encoding: "utf8" });
+async function* readRows(source, kind, hashes) {
+  const file = source.file;
+  const stream = await source.open();
+  stream.setEncoding("utf8");
   const lines = createInterface({ input: stream, crlfDelay: Infinity });
   let line = 0;
+  let rows = 0;
   try {
     for await (const text2 of lines) {
       line++;
@@ -49617,6 +50124,7 @@ async function* readRows(path, file, kind, hashes) {
           { file, pointer: `line ${line}`, expected: "must have a non-empty id" }
         ]);
       hashes?.push(hashId(id));
+      rows++;
       yield { id, value: parseValue(text2.slice(comma + 1), kind, file, line), line };
     }
   } finally {
@@ -49632,29 +50140,49 @@ async function* readRows(path, file, kind, hashes) {
       }
     ]);
   }
+  if (rows === 0) {
+    throw new InputError([
+      {
+        file,
+        pointer: "",
+        expected: "must have one row per example under its header",
+        got: "no rows"
+      }
+    ]);
+  }
 }
-async function duplicateIssues(path, file, kind, suspects) {
+async function duplicateIssues(source, kind, suspects) {
+  const file = source.file;
   const firstLine = /* @__PURE__ */ new Map();
-  const issues2 = [];
-  for await (const row of readRows(path, file, kind)) {
+  const issues = [];
+  for await (const row of readRows(source, kind)) {
     if (!suspects.has(hashId(row.id))) continue;
     const first = firstLine.get(row.id);
     if (first === void 0) firstLine.set(row.id, row.line);
     else
-      issues2.push({
+      issues.push({
         file,
         pointer: `line ${row.line}`,
         expected: `must have a unique id (also on line ${first})`,
         got: quote(row.id)
       });
   }
-  return issues2;
+  return issues;
+}
+async function checkPredictions(source, kind) {
+  const hashes = new HashLog();
+  for await (const row of readRows(source, kind, hashes)) void row;
+  const repeated = hashes.repeated();
+  if (repeated.size > 0) {
+    const issues = await duplicateIssues(source, kind, repeated);
+    if (issues.length > 0) throw new InputError(issues);
+  }
 }
 async function pairPredictions(baseline, candidate, kind) {
   const baseHashes = new HashLog();
   const candHashes = new HashLog();
-  const base = readRows(baseline.path, baseline.file, kind, baseHashes);
-  const cand = readRows(candidate.path, candidate.file, kind, candHashes);
+  const base = readRows(baseline, kind, baseHashes);
+  const cand = readRows(candidate, kind, candHashes);
   const waitingBase = /* @__PURE__ */ new Map();
   const waitingCand = /* @__PURE__ */ new Map();
   let rows = 0;
@@ -49692,14 +50220,12 @@ async function pairPredictions(baseline, candidate, kind) {
     if (!a.done) a = await base.next();
     if (!b.done) b = await cand.next();
   }
-  const issues2 = [];
+  const issues = [];
   const baseRepeated = baseHashes.repeated();
-  if (baseRepeated.size > 0)
-    issues2.push(...await duplicateIssues(baseline.path, baseline.file, kind, baseRepeated));
+  if (baseRepeated.size > 0) issues.push(...await duplicateIssues(baseline, kind, baseRepeated));
   const candRepeated = candHashes.repeated();
-  if (candRepeated.size > 0)
-    issues2.push(...await duplicateIssues(candidate.path, candidate.file, kind, candRepeated));
-  if (issues2.length > 0) throw new InputError(issues2);
+  if (candRepeated.size > 0) issues.push(...await duplicateIssues(candidate, kind, candRepeated));
+  if (issues.length > 0) throw new InputError(issues);
   const unmatched = { baseline: waitingBase.size, candidate: waitingCand.size };
   if (kind === "proportion") return { kind, rows, baselineOnly, candidateOnly, unmatched };
   return {
@@ -49714,7 +50240,6 @@ async function pairPredictions(baseline, candidate, kind) {
 // src/io/load-config.ts
 var import__2 = __toESM(require__(), 1);
 var import_yaml = __toESM(require_dist2(), 1);
-import { readFile as readFile2 } from "node:fs/promises";
 
 // schema/fitgap-config.schema.json
 var fitgap_config_schema_default = {
@@ -49726,31 +50251,65 @@ var fitgap_config_schema_default = {
   properties: {
     alpha: {
       type: "number",
-      exclusiveMinimum: 0,
-      exclusiveMaximum: 0.5,
-      description: "Significance level; default 0.05."
+      minimum: 1e-6,
+      maximum: 0.5,
+      description: "Significance level of every test, from 0.000001 to 0.5; default 0.05."
     },
     "min-effect": {
       type: "number",
       minimum: 0,
-      description: "Smallest change, in metric units, that counts; default 0."
+      maximum: 1e15,
+      description: "Smallest change, in metric units, that counts; from 0 to 1e15; default 0."
     },
     "gap-tolerance": {
       type: "number",
       minimum: 0,
       maximum: 1,
-      description: "A component counts as present at this fraction of the validation error level; default 0.10."
+      description: "A component counts as present at this fraction of the validation error level, from 0 to 1; default 0.10."
     },
     reference: {
       type: "number",
-      description: "Reference level (human-level, prior system, Bayes error) overriding the artifacts'."
+      minimum: -1e15,
+      maximum: 1e15,
+      description: "Reference level (human-level, prior system, Bayes error) overriding the artifacts'; within [0, 1] for a proportion metric."
     },
     "fail-on": {
-      type: "array",
-      items: {
-        type: "string"
-      },
-      description: "Outcomes that fail the gate; see README 'Gate'."
+      description: "Outcomes that fail the gate (README 'Gate'): a list, or one text with the outcomes separated by commas or new lines. 'none' never fails and stands alone; an empty list is refused.",
+      oneOf: [
+        {
+          type: "string",
+          minLength: 1
+        },
+        {
+          type: "array",
+          minItems: 1,
+          items: {
+            type: "string",
+            anyOf: [
+              {
+                enum: [
+                  "worse-validation",
+                  "toward-overfitting",
+                  "toward-underfitting",
+                  "worse-on-both",
+                  "any-movement",
+                  "slice-regression",
+                  "high-bias",
+                  "high-variance",
+                  "data-mismatch",
+                  "validation-overfit",
+                  "guardrail-regression",
+                  "guardrail-undetermined",
+                  "none"
+                ]
+              },
+              {
+                pattern: "^(train-seconds|inference-ms|parameters|memory-mb)-ratio>((?:0|[1-9][0-9]*)(?:\\.[0-9]+)?)$"
+              }
+            ]
+          }
+        }
+      ]
     },
     "epoch-log": {
       type: "object",
@@ -49840,6 +50399,25 @@ var fitgap_config_schema_default = {
           }
         }
       }
+    },
+    limits: {
+      type: "object",
+      additionalProperties: false,
+      description: "Byte limits of the input files, in MB (see SECURITY.md). The config file's own limit is set by --max-config-mb or the action input max-config-mb.",
+      properties: {
+        "artifact-mb": {
+          type: "number",
+          minimum: 1e-3,
+          maximum: 1024,
+          description: "Largest run artifact or epoch log; default 16."
+        },
+        "csv-mb": {
+          type: "number",
+          minimum: 1e-3,
+          maximum: 65536,
+          description: "Largest predictions CSV; default 512."
+        }
+      }
     }
   }
 };
@@ -49847,38 +50425,131 @@ var fitgap_config_schema_default = {
 // src/io/load-config.ts
 var compiled2;
 function validator2() {
-  compiled2 ??= new import__2.Ajv2020({ allErrors: true, strict: true }).compile(fitgap_config_schema_default);
+  compiled2 ??= new import__2.Ajv2020({
+    allErrors: true,
+    strict: true,
+    strictNumbers: true
+  }).compile(fitgap_config_schema_default);
   return compiled2;
 }
-function failOnIssues(values, file, pointer) {
-  return values.flatMap(
-    (value2, i2) => isFailOn(value2) ? [] : [
-      {
-        file,
-        pointer: pointer === "" ? "" : `${pointer}/${i2}`,
-        expected: `must be one of ${FAIL_ON_VALUES.join(", ")}`,
-        got: quote(value2)
+var MAX_FLOW_DEPTH = 16;
+var MAX_BLOCK_PREFIX = 64;
+var MAX_ALIASES = 100;
+function yamlNestingProblem(text2) {
+  const lines = text2.split("\n");
+  let depth = 0;
+  for (let n = 0; n < lines.length; n++) {
+    const line = lines[n] ?? "";
+    const prefix = /^[\s-]*/.exec(line)?.[0].length ?? 0;
+    if (prefix > MAX_BLOCK_PREFIX)
+      return {
+        line: n + 1,
+        what: `indentation or "- " nesting over ${MAX_BLOCK_PREFIX} characters`
+      };
+    let quoteChar = "";
+    for (let i2 = 0; i2 < line.length; i2++) {
+      const c = line[i2];
+      if (quoteChar !== "") {
+        if (c === quoteChar) quoteChar = "";
+        continue;
       }
-    ]
-  );
+      if (c === '"' || c === "'") quoteChar = c;
+      else if (c === "#" && (i2 === 0 || /\s/.test(line[i2 - 1] ?? ""))) break;
+      else if (c === "[" || c === "{") {
+        depth++;
+        if (depth > MAX_FLOW_DEPTH)
+          return { line: n + 1, what: `brackets nested more than ${MAX_FLOW_DEPTH} deep` };
+      } else if (c === "]" || c === "}") depth = Math.max(0, depth - 1);
+    }
+  }
+  return null;
+}
+function lineOf(text2, offset) {
+  let line = 1;
+  for (let i2 = 0; i2 < offset && i2 < text2.length; i2++) if (text2.charCodeAt(i2) === 10) line++;
+  return line;
 }
 function parseConfig(text2, file) {
-  const document = (0, import_yaml.parseDocument)(text2, { prettyErrors: true });
+  return checkSettings(parseRaw(text2, file), file);
+}
+var NUMBER_KEYS = ["alpha", "min-effect", "gap-tolerance", "reference"];
+var SETTING_KEYS = /* @__PURE__ */ new Set([...NUMBER_KEYS, "fail-on"]);
+function checkSettings(data, file) {
+  const { "fail-on": failOn, ...rest } = data;
+  const issues = [];
+  for (const key of NUMBER_KEYS) {
+    const value2 = rest[key];
+    if (value2 === void 0) continue;
+    const source2 = { file, pointer: `/${key}` };
+    if (typeof value2 !== "number") {
+      issues.push({ ...source2, expected: "must be a number", got: quote(value2) });
+    } else issues.push(...numberSettingIssues(key, value2, source2));
+  }
+  if (issues.length > 0) throw new InputError(issues);
+  if (failOn === void 0) return rest;
+  const source = { file, pointer: "/fail-on" };
+  if (typeof failOn === "string") {
+    const parsed = parseFailOn(failOn, source);
+    if ("issues" in parsed) throw new InputError(parsed.issues);
+    return { ...rest, "fail-on": parsed.value };
+  }
+  if (!Array.isArray(failOn) || failOn.some((v) => typeof v !== "string")) {
+    throw new InputError([
+      {
+        ...source,
+        expected: "must be a list of outcomes, or one text with outcomes separated by commas",
+        got: quote(failOn)
+      }
+    ]);
+  }
+  const failOnProblems = failOnIssues(failOn, source);
+  if (failOnProblems.length > 0) throw new InputError(failOnProblems);
+  return { ...rest, "fail-on": failOn };
+}
+function parseRaw(text2, file) {
+  const nesting = yamlNestingProblem(text2);
+  if (nesting !== null) {
+    throw new InputError([
+      {
+        file,
+        pointer: `line ${nesting.line}`,
+        expected: "must not nest deeper than a config needs",
+        got: nesting.what
+      }
+    ]);
+  }
+  const document = (0, import_yaml.parseDocument)(text2, { prettyErrors: false, uniqueKeys: true });
   if (document.errors.length > 0) {
     throw new InputError(
       document.errors.slice(0, 10).map((error2) => ({
         file,
-        pointer: error2.linePos?.[0] ? `line ${error2.linePos[0].line}` : "",
+        pointer: `line ${lineOf(text2, error2.pos[0])}`,
         expected: "is not valid YAML",
-        got: quote(error2.message.split("\n")[0] ?? "")
+        got: quote(
+          /call stack/i.test(error2.message) ? "nesting too deep" : error2.message.split("\n")[0] ?? ""
+        )
       }))
     );
   }
-  const data = document.toJS() ?? {};
+  let data;
+  try {
+    data = document.toJS({ maxAliasCount: MAX_ALIASES }) ?? {};
+  } catch (error2) {
+    throw new InputError([
+      {
+        file,
+        pointer: "",
+        expected: `must not expand aliases more than ${MAX_ALIASES} times`,
+        got: quote(error2 instanceof Error ? error2.message.split("\n")[0] : String(error2)),
+        hint: "Write the values out; a config needs no anchors (&) or aliases (*)."
+      }
+    ]);
+  }
   const validate = validator2();
-  if (!validate(data)) {
+  const rest = data !== null && typeof data === "object" && !Array.isArray(data) ? Object.fromEntries(Object.entries(data).filter(([key]) => !SETTING_KEYS.has(key))) : data;
+  if (!validate(rest)) {
     throw new InputError(
-      ajvIssues(validate.errors ?? [], file, data).map((issue2) => ({
+      ajvIssues(validate.errors ?? [], file, rest).map((issue2) => ({
         ...issue2,
         hint: issue2.hint?.replace(
           "schema/fitgap-run-1.schema.json",
@@ -49887,31 +50558,58 @@ function parseConfig(text2, file) {
       }))
     );
   }
-  const issues2 = failOnIssues(data["fail-on"] ?? [], file, "/fail-on");
-  if (issues2.length > 0) throw new InputError(issues2);
   return data;
 }
-async function loadConfig(path, file, required2) {
-  let text2;
+async function loadConfig(path, file, required2, limits) {
+  let read;
   try {
-    text2 = await readFile2(path, "utf8");
+    read = await readChecked({
+      path,
+      file,
+      what: "a config file (YAML)",
+      limit: "configBytes",
+      limits
+    });
   } catch (error2) {
-    const code = error2.code;
-    if (!required2 && code === "ENOENT") return null;
-    throw new InputError([
-      {
-        file,
-        pointer: "",
-        expected: "could not be read",
-        got: code ?? String(error2),
-        hint: "Check the --config path."
-      }
-    ]);
+    if (!(error2 instanceof MissingFileError)) throw error2;
+    if (!required2) return null;
+    throw new InputError(
+      error2.issues.map((i2) => ({ ...i2, hint: "Check the config path." }))
+    );
   }
-  return { config: parseConfig(text2, file), text: text2 };
+  const text2 = decodeUtf8(read.bytes, file, "a config file");
+  return {
+    config: parseConfig(text2, file),
+    text: text2,
+    checked: { realPath: read.file.realPath, id: read.file.id }
+  };
 }
 
 // src/io/review-from-files.ts
+var MB2 = 1024 * 1024;
+function resolveLimits(config, given = {}) {
+  const fromConfig = {};
+  const artifactMb = config.limits?.["artifact-mb"];
+  const csvMb = config.limits?.["csv-mb"];
+  if (artifactMb !== void 0) fromConfig.artifactBytes = Math.round(artifactMb * MB2);
+  if (csvMb !== void 0) fromConfig.csvBytes = Math.round(csvMb * MB2);
+  return { ...DEFAULT_FILE_LIMITS, ...fromConfig, ...given };
+}
+function referenceIssues(config, options, configFile, kind) {
+  if (kind !== "proportion") return [];
+  const fromFlag = options.overrides?.reference;
+  const value2 = fromFlag ?? config.reference;
+  if (value2 === void 0 || value2 >= 0 && value2 <= 1) return [];
+  return [
+    {
+      file: fromFlag !== void 0 ? options.overrideLabel?.("reference") ?? "--reference" : configFile,
+      pointer: fromFlag !== void 0 ? "" : "/reference",
+      expected: "must be within [0, 1] for a proportion metric",
+      got: quote(value2),
+      hint: "Write the reference as a fraction (0.02, not 2)."
+    }
+  ];
+}
 var DEFAULT_CONFIG_PATH = ".github/fitgap.yml";
 function resolveSettings(config, overrides = {}) {
   const reference = overrides.reference ?? config.reference;
@@ -49939,26 +50637,40 @@ function sameMetric(baseline, candidate) {
     hint: "Compare runs of the same metric; a review of different metrics would be meaningless."
   }));
 }
+var MIN_PAIRED_ROWS = 2;
 async function pairIfBoth(baseline, candidate) {
   const bp = baseline.artifact.predictions;
   const cp = candidate.artifact.predictions;
-  if (bp === void 0 || cp === void 0 || baseline.predictionsPath === null || candidate.predictionsPath === null) {
-    return {
-      notes: bp !== cp && (bp === void 0 || cp === void 0) ? [{ code: "predictions-in-one-run" }] : []
-    };
+  const kind = candidate.artifact.metric.kind;
+  const unpaired = async (notes2) => {
+    for (const run of [baseline, candidate])
+      if (run.predictions !== null) await checkPredictions(run.predictions, kind);
+    return { notes: notes2 };
+  };
+  if (baseline.predictions === null || candidate.predictions === null || bp === void 0 || cp === void 0) {
+    return unpaired(
+      bp !== cp && (bp === void 0 || cp === void 0) ? [{ code: "predictions-in-one-run" }] : []
+    );
   }
   if (bp.split !== cp.split) {
-    return {
-      notes: [{ code: "predictions-split-mismatch", baseline: bp.split, candidate: cp.split }]
-    };
+    return unpaired([
+      { code: "predictions-split-mismatch", baseline: bp.split, candidate: cp.split }
+    ]);
   }
-  const result = await pairPredictions(
-    { path: baseline.predictionsPath, file: join2(dirname3(baseline.file), bp.path) },
-    { path: candidate.predictionsPath, file: join2(dirname3(candidate.file), cp.path) },
-    candidate.artifact.metric.kind
-  );
+  const result = await pairPredictions(baseline.predictions, candidate.predictions, kind);
   const notes = [];
   const { unmatched, ...paired } = result;
+  if (result.rows < MIN_PAIRED_ROWS) {
+    throw new InputError([
+      {
+        file: `${baseline.predictions.file} and ${candidate.predictions.file}`,
+        pointer: "",
+        expected: `must share at least ${MIN_PAIRED_ROWS} ids to be paired`,
+        got: `${result.rows} shared (${unmatched.baseline} and ${unmatched.candidate} unmatched rows)`,
+        hint: "Write predictions of the same examples, with the same ids, for both runs."
+      }
+    ]);
+  }
   if (unmatched.baseline + unmatched.candidate > 0) {
     notes.push({
       code: "predictions-unmatched",
@@ -49969,12 +50681,18 @@ async function pairIfBoth(baseline, candidate) {
   }
   return { paired: { ...paired, split: bp.split }, notes };
 }
-async function loadReviewConfig(cwd, config) {
-  const configPath = resolve2(cwd, config ?? DEFAULT_CONFIG_PATH);
-  const loaded = await loadConfig(configPath, config ?? DEFAULT_CONFIG_PATH, config !== void 0);
-  if (loaded === null) return { config: {}, file: null };
+async function loadReviewConfig(cwd, config, limits) {
+  const configPath = resolve3(cwd, config ?? DEFAULT_CONFIG_PATH);
+  const loaded = await loadConfig(
+    configPath,
+    config ?? DEFAULT_CONFIG_PATH,
+    config !== void 0,
+    resolveLimits({}, limits)
+  );
+  if (loaded === null) return { config: {}, file: null, read: [] };
   return {
     config: loaded.config,
+    read: [loaded.checked],
     file: {
       path: config ?? DEFAULT_CONFIG_PATH,
       sha256: createHash3("sha256").update(loaded.text).digest("hex")
@@ -49995,31 +50713,57 @@ async function reviewLoadedRuns(baseline, candidate, config, overrides) {
 }
 async function reviewFiles(options) {
   const cwd = options.cwd ?? ".";
-  const { config, file: configFile } = await loadReviewConfig(cwd, options.config);
-  const epochLog = config["epoch-log"];
-  const load = (path) => loadRun(resolve2(cwd, path), {
-    displayName: path,
+  const configPath = resolve3(cwd, options.config ?? DEFAULT_CONFIG_PATH);
+  const configFile = options.names?.config ?? options.config ?? DEFAULT_CONFIG_PATH;
+  const loaded = await loadConfig(
+    configPath,
+    configFile,
+    options.config !== void 0,
+    resolveLimits({}, options.limits)
+  );
+  const config = loaded?.config ?? {};
+  const limits = resolveLimits(config, options.limits);
+  const epochLog = options.epochLogs === false ? void 0 : config["epoch-log"];
+  const streams = [];
+  const load = (path, name) => loadRun(resolve3(cwd, path), {
+    displayName: name ?? path,
+    limits,
+    track: (stream) => streams.push(stream),
     ...epochLog === void 0 ? {} : { epochLog }
   });
-  const [b, c] = await Promise.allSettled([load(options.baseline), load(options.candidate)]);
-  const issues2 = [b, c].flatMap(
-    (r) => r.status === "rejected" ? r.reason instanceof InputError ? r.reason.issues : [] : []
-  );
-  for (const r of [b, c])
-    if (r.status === "rejected" && !(r.reason instanceof InputError)) throw r.reason;
-  if (issues2.length > 0 || b.status === "rejected" || c.status === "rejected")
-    throw new InputError(issues2);
-  const baseline = b.value;
-  const candidate = c.value;
-  const review2 = await reviewLoadedRuns(baseline, candidate, config, options.overrides);
-  return {
-    review: review2,
-    files: {
-      baseline: { path: options.baseline, sha256: baseline.sha256 },
-      candidate: { path: options.candidate, sha256: candidate.sha256 },
-      config: configFile
-    }
-  };
+  try {
+    const [b, c] = await Promise.allSettled([
+      load(options.baseline, options.names?.baseline),
+      load(options.candidate, options.names?.candidate)
+    ]);
+    const issues = [b, c].flatMap(
+      (r) => r.status === "rejected" ? r.reason instanceof InputError ? r.reason.issues : [] : []
+    );
+    for (const r of [b, c])
+      if (r.status === "rejected" && !(r.reason instanceof InputError)) throw r.reason;
+    if (issues.length > 0 || b.status === "rejected" || c.status === "rejected")
+      throw new InputError(issues);
+    const baseline = b.value;
+    const candidate = c.value;
+    const reference = referenceIssues(config, options, configFile, candidate.artifact.metric.kind);
+    if (reference.length > 0) throw new InputError(reference);
+    const review2 = await reviewLoadedRuns(baseline, candidate, config, options.overrides);
+    return {
+      review: review2,
+      files: {
+        baseline: { path: baseline.file, sha256: baseline.sha256 },
+        candidate: { path: candidate.file, sha256: candidate.sha256 },
+        config: loaded === null ? null : {
+          path: configFile,
+          sha256: createHash3("sha256").update(loaded.text).digest("hex")
+        }
+      },
+      runs: { baseline, candidate },
+      read: [...loaded === null ? [] : [loaded.checked], ...baseline.read, ...candidate.read]
+    };
+  } finally {
+    for (const stream of streams) stream.destroy();
+  }
 }
 
 // src/io/audit-github.ts
@@ -50150,11 +50894,11 @@ async function fetchSide(options, side, sha, fallback, headRepository) {
   }
 }
 async function review(options, base, head) {
-  const root = await mkdtemp(join3(options.tempDir, "fitgap-audit-"));
+  const root = await mkdtemp(join2(options.tempDir, "fitgap-audit-"));
   try {
     const epochLog = options.config["epoch-log"];
     const load = (f, dir) => loadSide({
-      dir: join3(root, dir),
+      dir: join2(root, dir),
       artifact: f.artifact,
       beside: f.beside,
       displayName: f.from === void 0 ? `${short2(f.commit)}:${f.artifact.path}` : `${f.from.name}@${f.from.runId}:${f.artifact.path}`,
@@ -50262,35 +51006,52 @@ async function publishComment(options) {
   const body = fitBody(withMarker(options.body, key, options.headSha), options);
   const currentHead = options.currentHead ?? (await octokit.rest.pulls.get({ ...repo, pull_number: pullNumber })).data.head.sha;
   if (currentHead !== options.headSha) return { action: "stale", currentHead };
-  if (options.mode === "new") {
+  const create = () => shrinkOn422(options, body, async (text2) => {
     const { data: data2 } = await octokit.rest.issues.createComment({
       ...repo,
       issue_number: pullNumber,
-      body
+      body: text2
     });
+    return data2;
+  });
+  if (options.mode === "new") {
+    const data2 = await create();
     return { action: "created", id: data2.id, url: data2.html_url };
   }
-  const ours = await listOurComments(options, null);
+  const identity = options.identity ?? { kind: "bot" };
+  const ours = await listOurComments(options, identity);
   const [target, ...duplicates] = ours;
-  if (target === void 0) {
-    const { data: created } = await octokit.rest.issues.createComment({
-      ...repo,
-      issue_number: pullNumber,
-      body
-    });
-    return dedupeAfterCreate(options, body, created);
-  }
+  if (target === void 0) return dedupeAfterCreate(options, body, await create());
   await deleteComments(options, duplicates);
   if (target.body === body) return { action: "unchanged", id: target.id, url: target.html_url };
-  const { data } = await octokit.rest.issues.updateComment({
-    ...repo,
-    comment_id: target.id,
-    body
-  });
+  const data = await update(options, target.id, body);
   return { action: "updated", id: data.id, url: data.html_url };
 }
+function update(options, id, body) {
+  return shrinkOn422(options, body, async (text2) => {
+    const { data } = await options.octokit.rest.issues.updateComment({
+      ...options.repo,
+      comment_id: id,
+      body: text2
+    });
+    return data;
+  });
+}
+async function shrinkOn422(options, body, send) {
+  try {
+    return await send(body);
+  } catch (error2) {
+    const status = error2?.status;
+    const pointer = pointerBody(options, body.length);
+    if (status !== 422 || body === pointer) throw error2;
+    return send(pointer);
+  }
+}
 async function dedupeAfterCreate(options, body, created) {
-  const ours = await listOurComments(options, created.user?.login ?? null);
+  const ours = await listOurComments(
+    options,
+    created.user === null ? options.identity ?? { kind: "bot" } : { kind: "user", login: created.user.login }
+  );
   const [oldest, ...later] = ours;
   if (oldest === void 0 || oldest.id === created.id) {
     await deleteComments(options, later);
@@ -50298,14 +51059,10 @@ async function dedupeAfterCreate(options, body, created) {
   }
   await deleteComments(options, later);
   if (oldest.body === body) return { action: "unchanged", id: oldest.id, url: oldest.html_url };
-  const { data } = await options.octokit.rest.issues.updateComment({
-    ...options.repo,
-    comment_id: oldest.id,
-    body
-  });
+  const data = await update(options, oldest.id, body);
   return { action: "updated", id: data.id, url: data.html_url };
 }
-async function listOurComments(options, login) {
+async function listOurComments(options, identity) {
   const ours = [];
   const pages = options.octokit.paginate.iterator(options.octokit.rest.issues.listComments, {
     ...options.repo,
@@ -50314,14 +51071,15 @@ async function listOurComments(options, login) {
   });
   for await (const page of pages) {
     for (const comment2 of page.data) {
-      if (isOurs(comment2, options.key, login)) ours.push(comment2);
+      if (isOurs(comment2, options.key, identity)) ours.push(comment2);
     }
   }
   return ours.sort((a, b) => a.created_at.localeCompare(b.created_at) || a.id - b.id);
 }
-function isOurs(comment2, key, login = null) {
-  if (comment2.user?.type !== "Bot") return false;
-  if (login !== null && comment2.user.login !== login) return false;
+function isOurs(comment2, key, identity = { kind: "bot" }) {
+  const user = comment2.user;
+  if (user === null) return false;
+  if (identity.kind === "user" ? user.login !== identity.login : user.type !== "Bot") return false;
   return parseMarker(comment2.body ?? "")?.key === key;
 }
 async function deleteComments(options, comments) {
@@ -50334,10 +51092,12 @@ function withMarker(body, key, headSha) {
 ${body}`;
 }
 function fitBody(body, options) {
-  if (body.length <= MAX_COMMENT_CHARS) return body;
+  return body.length <= MAX_COMMENT_CHARS ? body : pointerBody(options, body.length);
+}
+function pointerBody(options, length) {
   const where = options.runUrl === void 0 ? "the job summary" : `the [job summary](${options.runUrl})`;
   return `${buildMarker({ key: options.key, head: options.headSha })}
-fitgap's review is ${body.length} characters long, more than a comment can hold (${MAX_COMMENT_CHARS}). Read it in ${where}.
+fitgap's review is ${length} characters long, more than a comment can hold (${MAX_COMMENT_CHARS}). Read it in ${where}.
 `;
 }
 
@@ -51548,7 +52308,10 @@ function isRequestError(error2) {
 }
 function describeRequestError(error2) {
   const path = new URL(error2.request.url, "http://api.invalid").pathname;
-  return `GitHub API ${error2.request.method} ${path} answered ${error2.status}: ${error2.message}`;
+  const call = `GitHub API ${error2.request.method} ${path}`;
+  if (error2.response === void 0) return `${call} could not be reached: ${error2.message}`;
+  const hint = error2.status === 401 ? ' (check the token given as "github-token")' : error2.status === 404 ? " (check the repository, the number, and that the token may see them)" : "";
+  return `${call} answered ${error2.status}: ${error2.message}${hint}`;
 }
 function failureMessage(error2) {
   if (error2 instanceof InputError || error2 instanceof UsageError) {
@@ -51608,6 +52371,20 @@ function clip(text2, max2) {
   return text2.slice(0, cut > room / 2 ? cut : room) + note;
 }
 
+// src/io/github/identity.ts
+var INSTALLATION_TOKEN = /^ghs_/;
+async function resolveIdentity(octokit, token) {
+  if (INSTALLATION_TOKEN.test(token)) return { kind: "bot" };
+  try {
+    const { data } = await octokit.rest.users.getAuthenticated();
+    return data.type === "Bot" ? { kind: "bot" } : { kind: "user", login: data.login };
+  } catch (error2) {
+    const status = error2?.status;
+    if (status === 403 || status === 404) return { kind: "bot" };
+    throw error2;
+  }
+}
+
 // src/entries/action/publish-steps.ts
 function setReviewOutputs(io, review2, reportPath, reportDir) {
   io.setOutput("movement", review2.movement);
@@ -51617,6 +52394,10 @@ function setReviewOutputs(io, review2, reportPath, reportDir) {
   io.setOutput("report-path", reportPath);
   io.setOutput("report-dir", reportDir);
 }
+function gateFailure(review2) {
+  return `fitgap gate failed:
+${gateReasonLines(review2, plainText).map((r) => `- ${r}`).join("\n")}`;
+}
 function runUrl(context3) {
   return `${context3.serverUrl}/${context3.repo.owner}/${context3.repo.repo}/actions/runs/${context3.runId}`;
 }
@@ -51624,9 +52405,11 @@ async function commentStep(deps, target, body) {
   const { settings, context: context3, octokit, io } = deps;
   if (settings.comment === "off") return null;
   try {
+    const identity = settings.comment === "update" ? await resolveIdentity(octokit, settings.api.token) : void 0;
     const outcome = await publishComment({
       octokit,
       repo: context3.repo,
+      ...identity === void 0 ? {} : { identity },
       pullNumber: target.pullNumber,
       headSha: target.headSha,
       key: settings.commentKey,
@@ -51687,1843 +52470,20 @@ async function gateCheckStep(deps, kind, sha, review2, body) {
 }
 
 // src/entries/action/report-files.ts
-import { mkdir as mkdir3, writeFile as writeFile3 } from "node:fs/promises";
+import { mkdir as mkdir4, writeFile as writeFile4 } from "node:fs/promises";
 import { join as join4 } from "node:path";
 
-// src/entries/action/bundle.ts
+// src/io/bundle.ts
 var import_ajv = __toESM(require_ajv(), 1);
-
-// src/validate/review.ts
-var import__3 = __toESM(require__(), 1);
-
-// schema/fitgap-review-1.schema.json
-var fitgap_review_1_schema_default = {
-  $schema: "https://json-schema.org/draft/2020-12/schema",
-  $id: "https://fitgap.dev/schema/fitgap-review-1.schema.json",
-  title: "Review",
-  description: "A fitgap review, format fitgap-review/1: codes, numbers and artifact strings (no sentences; the report writes those).",
-  type: "object",
-  additionalProperties: false,
-  required: [
-    "format",
-    "metric",
-    "settings",
-    "movement",
-    "validation",
-    "bias",
-    "variance",
-    "mismatch",
-    "overfit",
-    "splits",
-    "baseline",
-    "candidate",
-    "slices",
-    "hyperparameters",
-    "levers",
-    "nonLevers",
-    "gate",
-    "notes",
-    "paired"
-  ],
-  properties: {
-    format: {
-      const: "fitgap-review/1"
-    },
-    metric: {
-      type: "object",
-      additionalProperties: false,
-      required: ["name", "goal", "kind"],
-      properties: {
-        name: {
-          type: "string"
-        },
-        goal: {
-          enum: ["minimize", "maximize"]
-        },
-        kind: {
-          enum: ["proportion", "continuous"]
-        },
-        best: {
-          type: "number"
-        },
-        unit: {
-          type: "string"
-        }
-      }
-    },
-    settings: {
-      title: "ReviewSettings",
-      description: "The settings the review was made with.",
-      type: "object",
-      additionalProperties: false,
-      required: ["alpha", "minEffect", "gapTolerance", "failOn"],
-      properties: {
-        alpha: {
-          type: "number",
-          exclusiveMinimum: 0,
-          exclusiveMaximum: 1
-        },
-        minEffect: {
-          type: "number",
-          minimum: 0
-        },
-        gapTolerance: {
-          type: "number",
-          minimum: 0
-        },
-        failOn: {
-          type: "array",
-          items: {
-            $ref: "#/$defs/failOn"
-          }
-        }
-      }
-    },
-    movement: {
-      $ref: "#/$defs/movement"
-    },
-    validation: {
-      type: "object",
-      additionalProperties: false,
-      required: ["change", "delta"],
-      properties: {
-        change: {
-          $ref: "#/$defs/validationChange"
-        },
-        delta: {
-          $ref: "#/$defs/metricDelta"
-        }
-      }
-    },
-    bias: {
-      description: "Change in avoidable bias; null when neither run's training error can be measured.",
-      type: "object",
-      additionalProperties: false,
-      required: ["delta"],
-      properties: {
-        delta: {
-          oneOf: [
-            {
-              $ref: "#/$defs/shortfallDelta"
-            },
-            {
-              type: "null"
-            }
-          ]
-        }
-      }
-    },
-    variance: {
-      type: "object",
-      additionalProperties: false,
-      required: ["delta"],
-      properties: {
-        delta: {
-          $ref: "#/$defs/shortfallDelta"
-        }
-      }
-    },
-    mismatch: {
-      type: "object",
-      additionalProperties: false,
-      required: ["delta"],
-      properties: {
-        delta: {
-          oneOf: [
-            {
-              $ref: "#/$defs/shortfallDelta"
-            },
-            {
-              type: "null"
-            }
-          ]
-        }
-      }
-    },
-    overfit: {
-      type: "object",
-      additionalProperties: false,
-      required: ["delta"],
-      properties: {
-        delta: {
-          oneOf: [
-            {
-              $ref: "#/$defs/shortfallDelta"
-            },
-            {
-              type: "null"
-            }
-          ]
-        }
-      }
-    },
-    splits: {
-      type: "array",
-      items: {
-        $ref: "#/$defs/splitChange"
-      }
-    },
-    baseline: {
-      $ref: "#/$defs/runSummary"
-    },
-    candidate: {
-      $ref: "#/$defs/runSummary"
-    },
-    slices: {
-      type: "array",
-      items: {
-        $ref: "#/$defs/sliceChange"
-      }
-    },
-    hyperparameters: {
-      type: "array",
-      items: {
-        $ref: "#/$defs/hyperparameterChange"
-      }
-    },
-    levers: {
-      type: "array",
-      items: {
-        $ref: "#/$defs/lever"
-      }
-    },
-    nonLevers: {
-      type: "array",
-      items: {
-        enum: ["smaller-training-set"]
-      },
-      description: "`smaller-training-set`: shrinking the training set does not cure high bias."
-    },
-    gate: {
-      title: "Gate",
-      type: "object",
-      additionalProperties: false,
-      required: ["pass", "reasons", "failOn"],
-      properties: {
-        pass: {
-          type: "boolean"
-        },
-        reasons: {
-          type: "array",
-          items: {
-            $ref: "#/$defs/gateReason"
-          }
-        },
-        failOn: {
-          type: "array",
-          items: {
-            $ref: "#/$defs/failOn"
-          }
-        }
-      }
-    },
-    notes: {
-      type: "array",
-      items: {
-        $ref: "#/$defs/note"
-      }
-    },
-    paired: {
-      oneOf: [
-        {
-          $ref: "#/$defs/paired"
-        },
-        {
-          type: "null"
-        }
-      ]
-    },
-    guardrails: {
-      description: "Guardrail metrics of either run, candidate's order first. Absent in reports of runs without guardrails.",
-      type: "array",
-      items: {
-        $ref: "#/$defs/guardrailReview"
-      }
-    },
-    cost: {
-      description: "Cost figures that both runs give, by field. Absent when neither run gives cost.",
-      type: "object",
-      additionalProperties: false,
-      properties: {
-        trainSeconds: {
-          $ref: "#/$defs/costChange"
-        },
-        inferenceMs: {
-          $ref: "#/$defs/costChange"
-        },
-        parameters: {
-          $ref: "#/$defs/costChange"
-        },
-        memoryMb: {
-          $ref: "#/$defs/costChange"
-        }
-      }
-    }
-  },
-  $defs: {
-    call: {
-      title: "Call",
-      description: "A change called on its estimate: `up`/`down` only when significant at alpha and at least min-effect in size; otherwise `flat`.",
-      enum: ["up", "down", "flat"]
-    },
-    testName: {
-      title: "TestName",
-      description: "The significance test behind a change (DESIGN.md \xA74); `none` when run-to-run noise is unknown.",
-      enum: ["welch-t", "z-binomial", "mcnemar-exact", "paired-t", "none"]
-    },
-    interval: {
-      title: "Interval",
-      description: "A two-sided interval [low, high].",
-      type: "array",
-      items: {
-        type: "number"
-      },
-      minItems: 2,
-      maxItems: 2
-    },
-    metricDelta: {
-      title: "MetricDelta",
-      description: "A change candidate \u2212 baseline in the metric's own units (for a maximized metric, up is better).",
-      type: "object",
-      additionalProperties: false,
-      required: ["unit", "estimate", "ci", "p", "test", "call"],
-      properties: {
-        unit: {
-          const: "metric",
-          description: "The unit of estimate and ci."
-        },
-        estimate: {
-          type: "number",
-          description: "Candidate \u2212 baseline."
-        },
-        ci: {
-          oneOf: [
-            {
-              $ref: "#/$defs/interval"
-            },
-            {
-              type: "null"
-            }
-          ],
-          description: "1 \u2212 alpha interval of the estimate; null when its noise is unknown."
-        },
-        p: {
-          type: ["number", "null"],
-          minimum: 0,
-          maximum: 1,
-          description: "Two-sided p-value; null when its noise is unknown."
-        },
-        test: {
-          $ref: "#/$defs/testName"
-        },
-        call: {
-          $ref: "#/$defs/call"
-        }
-      }
-    },
-    shortfallDelta: {
-      title: "ShortfallDelta",
-      description: "A change candidate \u2212 baseline in shortfall units: the metric's units signed so that up is always worse.",
-      type: "object",
-      additionalProperties: false,
-      required: ["unit", "estimate", "ci", "p", "test", "call"],
-      properties: {
-        unit: {
-          const: "shortfall",
-          description: "The unit of estimate and ci."
-        },
-        estimate: {
-          type: "number",
-          description: "Candidate \u2212 baseline."
-        },
-        ci: {
-          oneOf: [
-            {
-              $ref: "#/$defs/interval"
-            },
-            {
-              type: "null"
-            }
-          ],
-          description: "1 \u2212 alpha interval of the estimate; null when its noise is unknown."
-        },
-        p: {
-          type: ["number", "null"],
-          minimum: 0,
-          maximum: 1,
-          description: "Two-sided p-value; null when its noise is unknown."
-        },
-        test: {
-          $ref: "#/$defs/testName"
-        },
-        call: {
-          $ref: "#/$defs/call"
-        }
-      }
-    },
-    movement: {
-      title: "Movement",
-      description: "How the change moved the model in the bias/variance plane, from the calls on \u0394bias and \u0394variance.",
-      enum: [
-        "better-on-both",
-        "away-from-underfitting",
-        "toward-overfitting",
-        "away-from-overfitting",
-        "no-significant-change",
-        "toward-underfitting",
-        "worse-on-both"
-      ]
-    },
-    validationChange: {
-      title: "ValidationChange",
-      description: "Validation better, worse or flat (within noise or below min-effect).",
-      enum: ["better", "worse", "flat"]
-    },
-    diagnosis: {
-      title: "Diagnosis",
-      description: "The largest present error component of a run (DESIGN.md \xA76).",
-      enum: ["good-fit", "high-bias", "high-variance", "data-mismatch", "high-bias-and-variance"]
-    },
-    componentName: {
-      title: "ComponentName",
-      description: "An error component (DESIGN.md \xA73).",
-      enum: ["bias", "variance", "mismatch", "overfit"]
-    },
-    splitName: {
-      title: "SplitName",
-      description: "A split, named as in the run artifact.",
-      enum: ["train", "train_dev", "validation", "test"]
-    },
-    failOn: {
-      title: "FailOn",
-      description: "An outcome the gate can fail on (`fail-on`). A cost outcome `FIELD-ratio>X` (`train-seconds`, `inference-ms`, `parameters`, `memory-mb`) fires when candidate / baseline of that cost exceeds X.",
-      anyOf: [
-        {
-          enum: [
-            "worse-validation",
-            "toward-overfitting",
-            "toward-underfitting",
-            "worse-on-both",
-            "any-movement",
-            "slice-regression",
-            "high-bias",
-            "high-variance",
-            "data-mismatch",
-            "validation-overfit",
-            "guardrail-regression",
-            "guardrail-undetermined",
-            "none"
-          ]
-        },
-        {
-          type: "string",
-          pattern: "^(train-seconds|inference-ms|parameters|memory-mb)-ratio>(0|[1-9][0-9]*)(\\.[0-9]+)?$"
-        }
-      ]
-    },
-    leverId: {
-      title: "LeverId",
-      description: "A lever: what to try next.",
-      enum: [
-        "more-data",
-        "fewer-features",
-        "stronger-regularization",
-        "smaller-model",
-        "early-stopping",
-        "more-features",
-        "richer-features",
-        "weaker-regularization",
-        "bigger-model",
-        "train-longer",
-        "align-training-data",
-        "bigger-validation-set",
-        "add-repeats",
-        "supply-reference"
-      ]
-    },
-    unavailable: {
-      title: "UnavailableCode",
-      description: "Why a component has no value: no reference level, no train_dev split, or no test split.",
-      enum: ["no-reference", "no-train-dev", "no-test"]
-    },
-    component: {
-      title: "Component",
-      description: "One error component of one run, in shortfall units.",
-      type: "object",
-      additionalProperties: false,
-      required: ["name", "value", "ci", "p", "present"],
-      properties: {
-        name: {
-          $ref: "#/$defs/componentName"
-        },
-        value: {
-          type: ["number", "null"],
-          description: "Mean over repeats; null when it cannot be computed (see unavailable)."
-        },
-        unavailable: {
-          $ref: "#/$defs/unavailable"
-        },
-        ci: {
-          oneOf: [
-            {
-              $ref: "#/$defs/interval"
-            },
-            {
-              type: "null"
-            }
-          ],
-          description: "1 \u2212 alpha interval of the value where its noise is known."
-        },
-        p: {
-          type: ["number", "null"],
-          minimum: 0,
-          maximum: 1,
-          description: "One-sided p-value of value > 0, where its noise is known."
-        },
-        present: {
-          type: "boolean",
-          description: "At least gap-tolerance \xD7 error level, at least min-effect, and significant where testable."
-        }
-      }
-    },
-    splitSummary: {
-      title: "SplitSummary",
-      description: "One split of one run, in metric units.",
-      type: "object",
-      additionalProperties: false,
-      required: ["split", "mean", "sd", "repeats", "examples", "ci"],
-      properties: {
-        split: {
-          $ref: "#/$defs/splitName"
-        },
-        mean: {
-          type: "number",
-          description: "Mean over repeats."
-        },
-        sd: {
-          type: ["number", "null"],
-          description: "Sample standard deviation over repeats (null with one repeat)."
-        },
-        repeats: {
-          type: "integer",
-          minimum: 1
-        },
-        examples: {
-          type: ["integer", "null"],
-          minimum: 1
-        },
-        ci: {
-          oneOf: [
-            {
-              $ref: "#/$defs/interval"
-            },
-            {
-              type: "null"
-            }
-          ],
-          description: "Interval of the mean: t over repeats, or Wilson for one proportion with examples."
-        }
-      }
-    },
-    chartPoint: {
-      title: "ChartPoint",
-      description: "A curve point kept for charts (metric units).",
-      type: "object",
-      additionalProperties: false,
-      required: ["x", "validation"],
-      properties: {
-        x: {
-          type: "number"
-        },
-        train: {
-          type: "number"
-        },
-        validation: {
-          type: "number"
-        }
-      }
-    },
-    curveSkipped: {
-      title: "CurveSkipped",
-      description: "A curve that was not analysed: too few points, or the power-law fit failed.",
-      type: "object",
-      additionalProperties: false,
-      required: ["skipped", "points", "needs"],
-      properties: {
-        skipped: {
-          enum: ["too-few-points", "fit-failed"]
-        },
-        points: {
-          type: "integer",
-          minimum: 0,
-          description: "Points the curve has."
-        },
-        needs: {
-          type: "integer",
-          minimum: 0,
-          description: "Points the analysis needs."
-        }
-      }
-    },
-    epochsEvidence: {
-      title: "EpochsEvidence",
-      description: "Early-stopping evidence from the epoch curve (Prechelt 1998).",
-      type: "object",
-      additionalProperties: false,
-      required: [
-        "bestX",
-        "bestValidation",
-        "finalX",
-        "finalValidation",
-        "gl",
-        "pq",
-        "stoppedLate",
-        "stoppedEarly",
-        "chart"
-      ],
-      properties: {
-        bestX: {
-          type: "number",
-          description: "x of the lowest validation error."
-        },
-        bestValidation: {
-          type: "number"
-        },
-        finalX: {
-          type: "number"
-        },
-        finalValidation: {
-          type: "number"
-        },
-        gl: {
-          type: ["number", "null"],
-          description: "Generalization loss at the last point, in percent; null when the best validation error is exactly 0."
-        },
-        pq: {
-          type: ["number", "null"],
-          description: "Progress quotient GL/P_5 at the last strip end; null without train values."
-        },
-        stoppedLate: {
-          type: "boolean",
-          description: "The run ends past the validation minimum with GL > 5."
-        },
-        stoppedEarly: {
-          type: "boolean",
-          description: "Train and validation both still falling at the end (needs train values)."
-        },
-        stopsAt: {
-          type: "object",
-          additionalProperties: {
-            type: ["number", "null"]
-          },
-          description: "x at which each of Prechelt's criteria would have stopped the run; null when it never fired."
-        },
-        chart: {
-          type: "array",
-          items: {
-            $ref: "#/$defs/chartPoint"
-          },
-          description: "Chart-ready downsampled points (LTTB)."
-        }
-      }
-    },
-    learningCurveProjection: {
-      title: "LearningCurveProjection",
-      type: "object",
-      additionalProperties: false,
-      required: ["x", "validation", "ci"],
-      properties: {
-        x: {
-          type: "number"
-        },
-        validation: {
-          type: "number"
-        },
-        ci: {
-          $ref: "#/$defs/interval"
-        }
-      }
-    },
-    learningCurveEvidence: {
-      title: "LearningCurveEvidence",
-      description: "Power-law fit error(m) = a\xB7m^(\u2212b) + c of validation error against training examples; a, b, c and residual in error units, projections in metric units.",
-      type: "object",
-      additionalProperties: false,
-      required: ["a", "b", "c", "r2", "residual", "projections", "gapTrend", "chart"],
-      properties: {
-        a: {
-          type: "number"
-        },
-        b: {
-          type: "number"
-        },
-        c: {
-          type: "number"
-        },
-        r2: {
-          type: "number"
-        },
-        residual: {
-          type: "number"
-        },
-        projections: {
-          type: "array",
-          items: {
-            $ref: "#/$defs/learningCurveProjection"
-          }
-        },
-        gapTrend: {
-          enum: ["closing", "flat", "unknown"],
-          description: "Train/validation gap at the right end."
-        },
-        gapChangePerDoubling: {
-          type: ["number", "null"]
-        },
-        asymptote: {
-          type: "number",
-          description: "c in metric units: the level more data approaches."
-        },
-        chart: {
-          type: "array",
-          items: {
-            $ref: "#/$defs/chartPoint"
-          },
-          description: "Chart-ready downsampled points (LTTB)."
-        }
-      }
-    },
-    regularizationEvidence: {
-      title: "RegularizationEvidence",
-      description: "Where the regularization sweep has its validation minimum, and where the run's own strength sits.",
-      type: "object",
-      additionalProperties: false,
-      required: ["bestX", "bestValidation", "side", "suggestedX", "atEdge", "chart"],
-      properties: {
-        bestX: {
-          type: "number"
-        },
-        bestValidation: {
-          type: "number"
-        },
-        side: {
-          enum: ["below", "above", "at", "unknown"]
-        },
-        suggestedX: {
-          type: "number"
-        },
-        atEdge: {
-          enum: ["low", "high", null]
-        },
-        refined: {
-          type: "boolean"
-        },
-        chart: {
-          type: "array",
-          items: {
-            $ref: "#/$defs/chartPoint"
-          },
-          description: "Chart-ready downsampled points (LTTB)."
-        }
-      }
-    },
-    curvesReport: {
-      title: "CurvesReport",
-      description: "Curve evidence of one run; each member only where the artifact has that curve.",
-      type: "object",
-      additionalProperties: false,
-      required: [],
-      properties: {
-        epochs: {
-          oneOf: [
-            {
-              $ref: "#/$defs/epochsEvidence"
-            },
-            {
-              $ref: "#/$defs/curveSkipped"
-            }
-          ]
-        },
-        training_examples: {
-          oneOf: [
-            {
-              $ref: "#/$defs/learningCurveEvidence"
-            },
-            {
-              $ref: "#/$defs/curveSkipped"
-            }
-          ]
-        },
-        regularization: {
-          oneOf: [
-            {
-              $ref: "#/$defs/regularizationEvidence"
-            },
-            {
-              $ref: "#/$defs/curveSkipped"
-            }
-          ]
-        }
-      }
-    },
-    runSummary: {
-      title: "RunSummary",
-      description: "One run: its splits, error components, diagnosis and curve evidence.",
-      type: "object",
-      additionalProperties: false,
-      required: [
-        "name",
-        "commit",
-        "createdAt",
-        "reference",
-        "referenceSource",
-        "splits",
-        "errorLevel",
-        "components",
-        "diagnosis",
-        "biasUnknown",
-        "warnings",
-        "curves"
-      ],
-      properties: {
-        name: {
-          type: "string"
-        },
-        commit: {
-          type: ["string", "null"]
-        },
-        createdAt: {
-          type: ["string", "null"]
-        },
-        reference: {
-          type: ["number", "null"],
-          description: "Reference level used; null when unknown."
-        },
-        referenceSource: {
-          enum: ["artifact", "config", "default", "unknown"]
-        },
-        splits: {
-          type: "array",
-          items: {
-            $ref: "#/$defs/splitSummary"
-          }
-        },
-        errorLevel: {
-          type: "number",
-          description: "Validation error level e (DESIGN.md \xA76)."
-        },
-        components: {
-          type: "object",
-          additionalProperties: false,
-          required: ["bias", "variance", "mismatch", "overfit"],
-          properties: {
-            bias: {
-              $ref: "#/$defs/component"
-            },
-            variance: {
-              $ref: "#/$defs/component"
-            },
-            mismatch: {
-              $ref: "#/$defs/component"
-            },
-            overfit: {
-              $ref: "#/$defs/component"
-            }
-          }
-        },
-        diagnosis: {
-          $ref: "#/$defs/diagnosis"
-        },
-        biasUnknown: {
-          type: "boolean",
-          description: "No reference level: the diagnosis rests on variance and mismatch only."
-        },
-        warnings: {
-          type: "array",
-          items: {
-            enum: ["validation-overfit"]
-          },
-          description: "`validation-overfit`: test error well above validation error."
-        },
-        curves: {
-          $ref: "#/$defs/curvesReport"
-        }
-      }
-    },
-    splitChange: {
-      title: "SplitChange",
-      type: "object",
-      additionalProperties: false,
-      required: ["split", "baseline", "candidate", "delta"],
-      properties: {
-        split: {
-          $ref: "#/$defs/splitName"
-        },
-        baseline: {
-          type: "number"
-        },
-        candidate: {
-          type: "number"
-        },
-        delta: {
-          $ref: "#/$defs/metricDelta"
-        }
-      }
-    },
-    sliceChange: {
-      title: "SliceChange",
-      description: "Validation change of one slice, metric units.",
-      type: "object",
-      additionalProperties: false,
-      required: [
-        "name",
-        "examples",
-        "baseline",
-        "candidate",
-        "delta",
-        "pAdjusted",
-        "change",
-        "hiddenRegression"
-      ],
-      properties: {
-        name: {
-          type: "string"
-        },
-        examples: {
-          type: ["integer", "null"],
-          minimum: 1
-        },
-        baseline: {
-          type: "number"
-        },
-        candidate: {
-          type: "number"
-        },
-        delta: {
-          $ref: "#/$defs/metricDelta"
-        },
-        pAdjusted: {
-          type: ["number", "null"],
-          minimum: 0,
-          maximum: 1,
-          description: "Holm\u2013Bonferroni adjusted p over all slices; null when untestable."
-        },
-        change: {
-          $ref: "#/$defs/validationChange"
-        },
-        hiddenRegression: {
-          type: "boolean",
-          description: "Regressed significantly while the aggregate validation improved."
-        }
-      }
-    },
-    hyperparameterChange: {
-      title: "HyperparameterChange",
-      type: "object",
-      additionalProperties: false,
-      required: ["key", "baseline", "candidate", "kind"],
-      properties: {
-        key: {
-          type: "string"
-        },
-        baseline: {
-          tsType: "unknown",
-          description: "Any JSON value (null when added)."
-        },
-        candidate: {
-          tsType: "unknown",
-          description: "Any JSON value (null when removed)."
-        },
-        kind: {
-          enum: ["raised", "lowered", "changed", "added", "removed"]
-        }
-      }
-    },
-    leverDiagnosis: {
-      title: "DiagnosisEvidence",
-      description: "A present error component of the candidate, with its size and the validation error level (both shortfall units).",
-      type: "object",
-      additionalProperties: false,
-      required: ["kind", "component", "value", "errorLevel"],
-      properties: {
-        kind: {
-          const: "diagnosis"
-        },
-        component: {
-          $ref: "#/$defs/componentName"
-        },
-        value: {
-          type: "number"
-        },
-        errorLevel: {
-          type: "number"
-        }
-      }
-    },
-    leverPrChange: {
-      title: "PrChangeEvidence",
-      description: "The PR changed a hyperparameter this lever reverses or counters.",
-      type: "object",
-      additionalProperties: false,
-      required: ["kind", "hyperparameter", "from", "to", "direction"],
-      properties: {
-        kind: {
-          const: "pr-change"
-        },
-        hyperparameter: {
-          type: "string"
-        },
-        from: {
-          type: "number"
-        },
-        to: {
-          type: "number"
-        },
-        direction: {
-          enum: ["raised", "lowered"]
-        }
-      }
-    },
-    leverComponentChange: {
-      title: "ComponentChangeEvidence",
-      description: "How a component changed between the runs.",
-      type: "object",
-      additionalProperties: false,
-      required: ["kind", "component", "delta"],
-      properties: {
-        kind: {
-          const: "component-change"
-        },
-        component: {
-          enum: ["bias", "variance"]
-        },
-        delta: {
-          $ref: "#/$defs/shortfallDelta"
-        }
-      }
-    },
-    leverAlreadyPulled: {
-      title: "AlreadyPulledEvidence",
-      description: "The PR itself already pulled this lever: judge its effect before pulling further.",
-      type: "object",
-      additionalProperties: false,
-      required: ["kind", "hyperparameter", "from", "to", "direction"],
-      properties: {
-        kind: {
-          const: "already-pulled"
-        },
-        hyperparameter: {
-          type: "string"
-        },
-        from: {
-          type: "number"
-        },
-        to: {
-          type: "number"
-        },
-        direction: {
-          enum: ["raised", "lowered"]
-        }
-      }
-    },
-    leverSweepMinimum: {
-      title: "SweepMinimumEvidence",
-      description: "The candidate's regularization sweep: its validation minimum and the strength the candidate uses.",
-      type: "object",
-      additionalProperties: false,
-      required: [
-        "kind",
-        "hyperparameter",
-        "bestX",
-        "bestValidation",
-        "current",
-        "suggestedX",
-        "side",
-        "supports",
-        "atEdge"
-      ],
-      properties: {
-        kind: {
-          const: "sweep-minimum"
-        },
-        hyperparameter: {
-          type: ["string", "null"],
-          description: "The candidate's regularization hyperparameter, when it has one."
-        },
-        bestX: {
-          type: "number"
-        },
-        bestValidation: {
-          type: "number",
-          description: "Lowest validation value of the sweep, metric units."
-        },
-        current: {
-          type: ["number", "null"],
-          description: "The candidate's own strength."
-        },
-        suggestedX: {
-          type: "number"
-        },
-        side: {
-          enum: ["below", "above", "at", "unknown"],
-          description: "Where the candidate's own strength sits relative to the minimum."
-        },
-        supports: {
-          type: ["boolean", "null"],
-          description: "true: the minimum lies on this lever's side; false: it does not (other side, or the candidate is at it); null: not known."
-        },
-        atEdge: {
-          enum: ["low", "high", null]
-        }
-      }
-    },
-    leverLearningCurve: {
-      title: "LearningProjectionEvidence",
-      description: "The power-law projection of validation at more training examples (metric units).",
-      type: "object",
-      additionalProperties: false,
-      required: ["kind", "fromX", "atX", "current", "projected", "ci", "r2"],
-      properties: {
-        kind: {
-          const: "learning-curve"
-        },
-        fromX: {
-          type: "number",
-          description: "Largest training-set size on the curve."
-        },
-        atX: {
-          type: "number"
-        },
-        current: {
-          type: "number",
-          description: "Candidate's validation mean."
-        },
-        projected: {
-          type: "number"
-        },
-        ci: {
-          $ref: "#/$defs/interval"
-        },
-        r2: {
-          type: "number"
-        }
-      }
-    },
-    leverGapTrend: {
-      title: "GapTrendEvidence",
-      description: "The train/validation gap at the right end of the learning curve.",
-      type: "object",
-      additionalProperties: false,
-      required: ["kind", "trend"],
-      properties: {
-        kind: {
-          const: "gap-trend"
-        },
-        trend: {
-          enum: ["closing", "flat"]
-        }
-      }
-    },
-    leverEpochMinimum: {
-      title: "EpochMinimumEvidence",
-      description: "The epoch curve passed its validation minimum.",
-      type: "object",
-      additionalProperties: false,
-      required: ["kind", "epoch", "of", "saves", "gl"],
-      properties: {
-        kind: {
-          const: "epoch-minimum"
-        },
-        epoch: {
-          type: "number"
-        },
-        of: {
-          type: "number"
-        },
-        saves: {
-          type: "number",
-          minimum: 0,
-          description: "Validation error saved by stopping at the minimum, shortfall units."
-        },
-        gl: {
-          type: ["number", "null"],
-          description: "Generalization loss at the end, percent."
-        }
-      }
-    },
-    leverStillImproving: {
-      title: "StillImprovingEvidence",
-      description: "Train and validation were both still improving at the last epoch.",
-      type: "object",
-      additionalProperties: false,
-      required: ["kind", "epoch"],
-      properties: {
-        kind: {
-          const: "still-improving"
-        },
-        epoch: {
-          type: "number"
-        }
-      }
-    },
-    leverEpochCurveSilent: {
-      title: "EpochCurveSilentEvidence",
-      description: "The epoch curve does not confirm this lever (or there is none).",
-      type: "object",
-      additionalProperties: false,
-      required: ["kind", "curve"],
-      properties: {
-        kind: {
-          const: "epoch-curve-silent"
-        },
-        curve: {
-          type: "boolean",
-          description: "Whether the candidate has an epoch curve."
-        }
-      }
-    },
-    leverReferenceMissing: {
-      title: "ReferenceMissingEvidence",
-      description: "No reference level, so avoidable bias is unknown.",
-      type: "object",
-      additionalProperties: false,
-      required: ["kind"],
-      properties: {
-        kind: {
-          const: "reference-missing"
-        }
-      }
-    },
-    leverNoiseUnknown: {
-      title: "NoiseUnknownEvidence",
-      description: "Run-to-run noise is unknown (one repeat of a continuous metric, no paired predictions).",
-      type: "object",
-      additionalProperties: false,
-      required: ["kind"],
-      properties: {
-        kind: {
-          const: "noise-unknown"
-        }
-      }
-    },
-    leverEvidence: {
-      title: "LeverEvidenceItem",
-      description: "One fact behind a lever.",
-      oneOf: [
-        {
-          $ref: "#/$defs/leverDiagnosis"
-        },
-        {
-          $ref: "#/$defs/leverPrChange"
-        },
-        {
-          $ref: "#/$defs/leverComponentChange"
-        },
-        {
-          $ref: "#/$defs/leverAlreadyPulled"
-        },
-        {
-          $ref: "#/$defs/leverSweepMinimum"
-        },
-        {
-          $ref: "#/$defs/leverLearningCurve"
-        },
-        {
-          $ref: "#/$defs/leverGapTrend"
-        },
-        {
-          $ref: "#/$defs/leverEpochMinimum"
-        },
-        {
-          $ref: "#/$defs/leverStillImproving"
-        },
-        {
-          $ref: "#/$defs/leverEpochCurveSilent"
-        },
-        {
-          $ref: "#/$defs/leverReferenceMissing"
-        },
-        {
-          $ref: "#/$defs/leverNoiseUnknown"
-        }
-      ]
-    },
-    suggestion: {
-      title: "Suggestion",
-      description: "A value to try.",
-      type: "object",
-      additionalProperties: false,
-      required: ["hyperparameter", "value", "basis"],
-      properties: {
-        hyperparameter: {
-          type: "string"
-        },
-        value: {
-          type: "number"
-        },
-        basis: {
-          enum: ["between-old-and-new", "sweep-minimum", "beyond-sweep-edge"],
-          description: "Where the value comes from."
-        }
-      }
-    },
-    lever: {
-      title: "Lever",
-      description: "What to try next, ranked by score.",
-      type: "object",
-      additionalProperties: false,
-      required: ["id", "score", "evidence"],
-      properties: {
-        id: {
-          $ref: "#/$defs/leverId"
-        },
-        score: {
-          type: "number",
-          description: "Rank key, higher first (see src/analysis/levers/scores.ts)."
-        },
-        suggestion: {
-          $ref: "#/$defs/suggestion"
-        },
-        evidence: {
-          type: "array",
-          items: {
-            $ref: "#/$defs/leverEvidence"
-          }
-        }
-      }
-    },
-    gateReason: {
-      title: "GateReason",
-      description: "A fail-on outcome that fired.",
-      type: "object",
-      additionalProperties: false,
-      required: ["outcome"],
-      properties: {
-        outcome: {
-          $ref: "#/$defs/failOn"
-        },
-        slices: {
-          type: "integer",
-          minimum: 0,
-          description: "Slices that regressed (slice-regression)."
-        },
-        guardrails: {
-          type: "array",
-          items: {
-            type: "string"
-          },
-          description: "Guardrails that fired (guardrail-regression, guardrail-undetermined)."
-        },
-        ratio: {
-          type: "number",
-          exclusiveMinimum: 0,
-          description: "The cost ratio that exceeded its limit (FIELD-ratio>X)."
-        }
-      }
-    },
-    trainDevInOneRunNote: {
-      title: "TrainDevInOneRunNote",
-      description: "Only one run has a train_dev split: the variance change is measured as validation \u2212 train in both.",
-      type: "object",
-      additionalProperties: false,
-      required: ["code"],
-      properties: {
-        code: {
-          const: "train-dev-in-one-run"
-        }
-      }
-    },
-    unpairedSlicesNote: {
-      title: "UnpairedSlicesNote",
-      description: "Slices found in one run only, not compared.",
-      type: "object",
-      additionalProperties: false,
-      required: ["code", "count", "names"],
-      properties: {
-        code: {
-          const: "unpaired-slices"
-        },
-        count: {
-          type: "integer",
-          minimum: 0
-        },
-        names: {
-          type: "array",
-          items: {
-            type: "string"
-          },
-          description: "The first few names (at most 5)."
-        }
-      }
-    },
-    hiddenRegressionsNote: {
-      title: "HiddenRegressionsNote",
-      description: "Validation improved, yet slices regressed significantly (Holm-adjusted).",
-      type: "object",
-      additionalProperties: false,
-      required: ["code", "count", "names"],
-      properties: {
-        code: {
-          const: "hidden-regressions"
-        },
-        count: {
-          type: "integer",
-          minimum: 0
-        },
-        names: {
-          type: "array",
-          items: {
-            type: "string"
-          },
-          description: "The first few names (at most 5)."
-        }
-      }
-    },
-    noiseUnknownNote: {
-      title: "NoiseUnknownNote",
-      description: "Run-to-run noise is unknown: changes are called on size alone (min-effect), or not at all when min-effect is 0.",
-      type: "object",
-      additionalProperties: false,
-      required: ["code"],
-      properties: {
-        code: {
-          const: "noise-unknown"
-        }
-      }
-    },
-    biasUnknownNote: {
-      title: "BiasUnknownNote",
-      description: "No reference level: avoidable bias is unknown; its change is measured from the training error.",
-      type: "object",
-      additionalProperties: false,
-      required: ["code"],
-      properties: {
-        code: {
-          const: "bias-unknown"
-        }
-      }
-    },
-    predictionsShareNoIdNote: {
-      title: "PredictionsShareNoIdNote",
-      description: "The two predictions files share no id: no paired test.",
-      type: "object",
-      additionalProperties: false,
-      required: ["code"],
-      properties: {
-        code: {
-          const: "predictions-share-no-id"
-        }
-      }
-    },
-    predictionsInOneRunNote: {
-      title: "PredictionsInOneRunNote",
-      description: "Only one run ships per-example predictions: no paired test.",
-      type: "object",
-      additionalProperties: false,
-      required: ["code"],
-      properties: {
-        code: {
-          const: "predictions-in-one-run"
-        }
-      }
-    },
-    predictionsSplitMismatchNote: {
-      title: "PredictionsSplitMismatchNote",
-      description: "The predictions are for different splits: no paired test.",
-      type: "object",
-      additionalProperties: false,
-      required: ["code", "baseline", "candidate"],
-      properties: {
-        code: {
-          const: "predictions-split-mismatch"
-        },
-        baseline: {
-          $ref: "#/$defs/splitName"
-        },
-        candidate: {
-          $ref: "#/$defs/splitName"
-        }
-      }
-    },
-    predictionsUnmatchedNote: {
-      title: "PredictionsUnmatchedNote",
-      description: "Prediction rows without a partner, left out of the paired test.",
-      type: "object",
-      additionalProperties: false,
-      required: ["code", "rows", "baseline", "candidate"],
-      properties: {
-        code: {
-          const: "predictions-unmatched"
-        },
-        rows: {
-          type: "integer",
-          minimum: 0
-        },
-        baseline: {
-          type: "integer",
-          minimum: 0
-        },
-        candidate: {
-          type: "integer",
-          minimum: 0
-        }
-      }
-    },
-    epochLogNotUsedNote: {
-      title: "EpochLogNotUsedNote",
-      description: "The artifact has its own epoch curve; the configured epoch log was not used.",
-      type: "object",
-      additionalProperties: false,
-      required: ["code", "file", "log"],
-      properties: {
-        code: {
-          const: "epoch-log-not-used"
-        },
-        file: {
-          type: "string"
-        },
-        log: {
-          type: "string"
-        }
-      }
-    },
-    epochLogMissingNote: {
-      title: "EpochLogMissingNote",
-      description: "No epoch log next to the artifact; the config's epoch-log mapping was not applied.",
-      type: "object",
-      additionalProperties: false,
-      required: ["code", "file", "log"],
-      properties: {
-        code: {
-          const: "epoch-log-missing"
-        },
-        file: {
-          type: "string"
-        },
-        log: {
-          type: "string"
-        }
-      }
-    },
-    note: {
-      title: "Note",
-      description: "Something the reviewer should know about the inputs or the method.",
-      oneOf: [
-        {
-          $ref: "#/$defs/trainDevInOneRunNote"
-        },
-        {
-          $ref: "#/$defs/unpairedSlicesNote"
-        },
-        {
-          $ref: "#/$defs/hiddenRegressionsNote"
-        },
-        {
-          $ref: "#/$defs/noiseUnknownNote"
-        },
-        {
-          $ref: "#/$defs/biasUnknownNote"
-        },
-        {
-          $ref: "#/$defs/predictionsShareNoIdNote"
-        },
-        {
-          $ref: "#/$defs/predictionsInOneRunNote"
-        },
-        {
-          $ref: "#/$defs/predictionsSplitMismatchNote"
-        },
-        {
-          $ref: "#/$defs/predictionsUnmatchedNote"
-        },
-        {
-          $ref: "#/$defs/epochLogNotUsedNote"
-        },
-        {
-          $ref: "#/$defs/epochLogMissingNote"
-        }
-      ]
-    },
-    paired: {
-      title: "PairedSummary",
-      description: "Paired-prediction evidence on the validation change.",
-      type: "object",
-      additionalProperties: false,
-      required: ["rows", "test"],
-      properties: {
-        rows: {
-          type: "integer",
-          minimum: 0
-        },
-        test: {
-          enum: ["mcnemar-exact", "paired-t"]
-        },
-        discordant: {
-          type: "object",
-          additionalProperties: false,
-          required: ["baselineOnly", "candidateOnly"],
-          properties: {
-            baselineOnly: {
-              type: "integer",
-              minimum: 0
-            },
-            candidateOnly: {
-              type: "integer",
-              minimum: 0
-            }
-          }
-        }
-      }
-    },
-    guardrailChange: {
-      title: "GuardrailChange",
-      description: "Change of a guardrail, candidate \u2212 baseline, in the metric's own units; the call is in the metric's direction.",
-      type: "object",
-      additionalProperties: false,
-      required: ["estimate", "ci", "p", "test", "call"],
-      properties: {
-        estimate: {
-          type: "number"
-        },
-        ci: {
-          oneOf: [
-            {
-              $ref: "#/$defs/interval"
-            },
-            {
-              type: "null"
-            }
-          ]
-        },
-        p: {
-          oneOf: [
-            {
-              type: "number"
-            },
-            {
-              type: "null"
-            }
-          ]
-        },
-        test: {
-          $ref: "#/$defs/testName"
-        },
-        call: {
-          enum: ["better", "worse", "flat", "undetermined"]
-        }
-      }
-    },
-    guardrailProblem: {
-      title: "GuardrailProblem",
-      description: "What kept a guardrail from a full review.",
-      enum: [
-        "missing-in-baseline",
-        "missing-in-candidate",
-        "metric-differs",
-        "noise-unknown",
-        "no-margin",
-        "candidate-margin-ignored"
-      ]
-    },
-    guardrailReview: {
-      title: "GuardrailReview",
-      description: "One guardrail metric: its change and its non-inferiority call against the margin (confidence-interval approach, ICH E9 \xA73.3.2; Holm across guardrails).",
-      type: "object",
-      additionalProperties: false,
-      required: [
-        "name",
-        "goal",
-        "kind",
-        "unit",
-        "baseline",
-        "candidate",
-        "change",
-        "margin",
-        "marginSource",
-        "worseningBounds",
-        "pNonInferior",
-        "nonInferiority",
-        "problems"
-      ],
-      properties: {
-        name: {
-          type: "string"
-        },
-        goal: {
-          enum: ["minimize", "maximize"]
-        },
-        kind: {
-          enum: ["proportion", "continuous"]
-        },
-        unit: {
-          oneOf: [
-            {
-              type: "string"
-            },
-            {
-              type: "null"
-            }
-          ]
-        },
-        baseline: {
-          oneOf: [
-            {
-              type: "number"
-            },
-            {
-              type: "null"
-            }
-          ]
-        },
-        candidate: {
-          oneOf: [
-            {
-              type: "number"
-            },
-            {
-              type: "null"
-            }
-          ]
-        },
-        change: {
-          oneOf: [
-            {
-              $ref: "#/$defs/guardrailChange"
-            },
-            {
-              type: "null"
-            }
-          ]
-        },
-        margin: {
-          oneOf: [
-            {
-              type: "number",
-              minimum: 0
-            },
-            {
-              type: "null"
-            }
-          ]
-        },
-        marginSource: {
-          oneOf: [
-            {
-              enum: ["config", "baseline", "candidate"]
-            },
-            {
-              type: "null"
-            }
-          ]
-        },
-        worseningBounds: {
-          oneOf: [
-            {
-              $ref: "#/$defs/interval"
-            },
-            {
-              type: "null"
-            }
-          ]
-        },
-        pNonInferior: {
-          oneOf: [
-            {
-              type: "number",
-              minimum: 0,
-              maximum: 1
-            },
-            {
-              type: "null"
-            }
-          ]
-        },
-        nonInferiority: {
-          oneOf: [
-            {
-              enum: ["non-inferior", "inferior", "undetermined"]
-            },
-            {
-              type: "null"
-            }
-          ]
-        },
-        problems: {
-          type: "array",
-          items: {
-            $ref: "#/$defs/guardrailProblem"
-          }
-        }
-      }
-    },
-    costChange: {
-      title: "CostChange",
-      description: "A cost figure of both runs: candidate / baseline with its interval (Welch on logarithms) where per-repeat values allow.",
-      type: "object",
-      additionalProperties: false,
-      required: ["baseline", "candidate", "ratio", "ci", "p", "call"],
-      properties: {
-        baseline: {
-          type: "number",
-          exclusiveMinimum: 0
-        },
-        candidate: {
-          type: "number",
-          exclusiveMinimum: 0
-        },
-        ratio: {
-          type: "number",
-          exclusiveMinimum: 0
-        },
-        ci: {
-          oneOf: [
-            {
-              $ref: "#/$defs/interval"
-            },
-            {
-              type: "null"
-            }
-          ]
-        },
-        p: {
-          oneOf: [
-            {
-              type: "number"
-            },
-            {
-              type: "null"
-            }
-          ]
-        },
-        call: {
-          enum: ["up", "down", "flat", "undetermined"]
-        }
-      }
-    }
-  }
-};
-
-// src/validate/review.ts
-var compiled3;
-function reviewValidator() {
-  if (compiled3 === void 0) {
-    const ajv2 = new import__3.Ajv2020({ allErrors: true, strict: true, strictNumbers: true });
-    ajv2.addKeyword({ keyword: "tsType", schemaType: "string" });
-    compiled3 = ajv2.compile(fitgap_review_1_schema_default);
-  }
-  return compiled3;
-}
-function isReview(doc) {
-  return reviewValidator()(doc);
-}
-function reviewIssues(doc, file) {
-  const validate = reviewValidator();
-  return validate(doc) ? [] : ajvIssues(validate.errors ?? [], file, doc);
-}
-
-// src/entries/action/bundle.ts
+import { mkdir as mkdir3, mkdtemp as mkdtemp2, writeFile as writeFile3 } from "node:fs/promises";
+import { createWriteStream } from "node:fs";
+import { pipeline } from "node:stream/promises";
+import { join as join3 } from "node:path";
 var REVIEW_FILE = "review.json";
 var PULL_REQUEST_FILE = "pull-request.json";
-var ajv = new import_ajv.Ajv({ allErrors: true });
+var RUN_FILE = "run.json";
+var PREDICTIONS_FILE = "predictions.csv";
+var SIDES = ["baseline", "candidate"];
 var pullRequestSchema = {
   type: "object",
   additionalProperties: false,
@@ -53531,52 +52491,104 @@ var pullRequestSchema = {
   properties: {
     format: { type: "string", const: "fitgap-pull-request/1" },
     repository: { type: "string", pattern: "^[A-Za-z0-9_.-]{1,100}/[A-Za-z0-9_.-]{1,100}$" },
-    number: { type: "integer", minimum: 1 },
+    number: { type: "integer", minimum: 1, maximum: 2147483647 },
     headSha: { type: "string", pattern: "^[0-9a-f]{40}$" }
   }
 };
-var validatePullRequest = ajv.compile(pullRequestSchema);
-function parse(bytes, file) {
-  try {
-    return JSON.parse(new TextDecoder().decode(bytes));
-  } catch (error2) {
-    throw new InputError([
-      { file, pointer: "", expected: "must be JSON", got: error2.message }
-    ]);
+var validatePullRequest = new import_ajv.Ajv({ allErrors: true, strictNumbers: true }).compile(
+  pullRequestSchema
+);
+function parsePullRequestNote(text2, file) {
+  const doc = parseJson(text2, file);
+  if (!validatePullRequest(doc)) {
+    throw new InputError(
+      (validatePullRequest.errors ?? []).map((e) => ({
+        file,
+        pointer: e.instancePath || "/",
+        expected: e.message ?? "is invalid",
+        hint: 'The note is written by fitgap in review mode; upload its "report-dir" unchanged.'
+      }))
+    );
+  }
+  return doc;
+}
+async function writeBundle(dir, runs, note) {
+  await mkdir3(dir, { recursive: true });
+  await writeFile3(join3(dir, PULL_REQUEST_FILE), `${JSON.stringify(note, null, 2)}
+`);
+  for (const side of SIDES) {
+    const run = runs[side];
+    const folder = join3(dir, side);
+    await mkdir3(folder, { recursive: true });
+    const artifact = run.artifact.predictions === void 0 ? run.artifact : { ...run.artifact, predictions: { ...run.artifact.predictions, path: PREDICTIONS_FILE } };
+    await writeFile3(join3(folder, RUN_FILE), `${JSON.stringify(artifact, null, 2)}
+`);
+    if (run.predictions !== null)
+      await pipeline(
+        await run.predictions.open(),
+        createWriteStream(join3(folder, PREDICTIONS_FILE))
+      );
   }
 }
-function issues(file, errors) {
-  return (errors ?? []).map((e) => ({
-    file,
-    pointer: e.instancePath || "/",
-    expected: e.message ?? "is invalid"
-  }));
-}
-function readPullRequestNote(bytes, label) {
-  const file = `${label} ${PULL_REQUEST_FILE}`;
-  const doc = parse(bytes, file);
-  if (!validatePullRequest(doc)) throw new InputError(issues(file, validatePullRequest.errors));
-  return doc;
-}
-function readReview(bytes, label) {
-  const file = `${label} ${REVIEW_FILE}`;
-  const doc = parse(bytes, file);
-  const problems = reviewIssues(doc, file);
-  if (problems.length > 0 || !isReview(doc)) throw new InputError(problems);
-  return doc;
+async function extractBundle(options) {
+  const { zip, label } = options;
+  const entries = listEntries(zip, label).filter((e) => !e.directory);
+  const wanted = [
+    PULL_REQUEST_FILE,
+    ...SIDES.flatMap((side) => [`${side}/${RUN_FILE}`, `${side}/${PREDICTIONS_FILE}`])
+  ];
+  for (const name of [PULL_REQUEST_FILE, ...SIDES.map((side) => `${side}/${RUN_FILE}`)]) {
+    if (entries.filter((e) => e.name === name).length !== 1) {
+      throw new InputError([
+        {
+          file: label,
+          pointer: "",
+          expected: `must hold ${name} exactly once`,
+          got: entries.some((e) => e.name === name) ? "more than one" : "none",
+          hint: 'Upload the "report-dir" output of the review step (fitgap 0.2 or later) unchanged.'
+        }
+      ]);
+    }
+  }
+  await mkdir3(options.tempDir, { recursive: true });
+  const folder = await mkdtemp2(join3(options.tempDir, "bundle-"));
+  const budget = { remaining: options.limitBytes, limit: options.limitBytes };
+  for (const entry of entries) {
+    if (!wanted.includes(entry.name)) continue;
+    const bytes2 = readEntry(zip, entry, budget, label);
+    const [side, base] = entry.name.includes("/") ? entry.name.split("/") : [null, entry.name];
+    if (side !== null) await mkdir3(join3(folder, side), { recursive: true });
+    await writeFile3(join3(folder, ...side === null ? [] : [side], base ?? ""), bytes2, {
+      flag: "wx"
+    });
+  }
+  const noteFile = `${label} ${PULL_REQUEST_FILE}`;
+  const { bytes } = await readChecked({
+    path: join3(folder, PULL_REQUEST_FILE),
+    file: noteFile,
+    what: "a pull-request note (JSON)",
+    limit: "artifactBytes",
+    limits: options.limits
+  });
+  const note = parsePullRequestNote(decodeUtf8(bytes, noteFile, "a pull-request note"), noteFile);
+  return {
+    note,
+    runs: {
+      baseline: join3(folder, "baseline", RUN_FILE),
+      candidate: join3(folder, "candidate", RUN_FILE)
+    },
+    folder
+  };
 }
 
 // src/entries/action/report-files.ts
 function reviewJson(review2) {
   return renderJson(review2);
 }
-async function writeReportFiles(dir, review2, note) {
-  await mkdir3(dir, { recursive: true });
+async function writeReportFiles(dir, review2) {
+  await mkdir4(dir, { recursive: true });
   const path = join4(dir, REVIEW_FILE);
-  await writeFile3(path, reviewJson(review2));
-  if (note !== null)
-    await writeFile3(join4(dir, PULL_REQUEST_FILE), `${JSON.stringify(note, null, 2)}
-`);
+  await writeFile4(path, reviewJson(review2));
   return { dir, path };
 }
 
@@ -53652,17 +52664,14 @@ var package_default = {
 var AUDIT_FILE = "audit.jsonl";
 async function runAudit(deps) {
   const { settings, context: context3, octokit, io, audit } = deps;
-  const overrides = {
-    ...settings.alpha === null ? {} : { alpha: settings.alpha },
-    ...settings.minEffect === null ? {} : { minEffect: settings.minEffect },
-    ...settings.failOn === null ? {} : { failOn: settings.failOn }
-  };
+  const overrides = settings.overrides;
   const { config, file: configFile } = await loadReviewConfig(
     settings.workspace,
-    settings.config ?? void 0
+    settings.config ?? void 0,
+    settings.limits
   );
   const dir = join5(settings.tempDir, `fitgap-${settings.commentKey}`, "audit");
-  await mkdir4(dir, { recursive: true });
+  await mkdir5(dir, { recursive: true });
   const options = {
     octokit,
     repo: context3.repo,
@@ -53686,12 +52695,12 @@ async function runAudit(deps) {
     commentKey: settings.commentKey
   });
   await io.appendSummary(body);
-  const report = await writeReportFiles(join5(dir, "report"), result.review, null);
+  const report = await writeReportFiles(join5(dir, "report"), result.review);
   const line = recordLine(
     pullRequestRecord(result, { recordedAt: deps.now().toISOString(), fitgapVersion: version })
   );
   const recordPath = join5(report.dir, AUDIT_FILE);
-  await writeFile4(recordPath, line);
+  await writeFile5(recordPath, line);
   setReviewOutputs(io, result.review, report.path, report.dir);
   io.setOutput("audit-record", line.trimEnd());
   io.setOutput("audit-record-path", recordPath);
@@ -53707,7 +52716,7 @@ async function runAudit(deps) {
       if (problem !== null) problems.push(problem);
     }
   }
-  if (settings.failOn !== null && !result.review.gate.pass)
+  if (overrides.failOn !== void 0 && !result.review.gate.pass)
     problems.unshift(
       `fitgap gate failed:
 ${gateReasonLines(result.review, plainText).map((r) => `- ${r}`).join("\n")}`
@@ -53748,16 +52757,16 @@ function optional(name) {
 }
 var REF = /^[A-Za-z0-9._/-]{1,250}$/;
 function readAuditSettings(settings) {
-  const issues2 = [];
+  const issues = [];
   const pull = optional("pull-request");
   const base = optional("base-sha");
   const head = optional("head-sha");
   let target = { pullNumber: 0 };
   if (pull !== null && base === null && head === null) {
-    const number2 = Number(pull.replace(/^#/, ""));
-    if (Number.isInteger(number2) && number2 >= 1) target = { pullNumber: number2 };
+    const number = Number(pull.replace(/^#/, ""));
+    if (Number.isInteger(number) && number >= 1) target = { pullNumber: number };
     else
-      issues2.push({
+      issues.push({
         file: 'input "pull-request"',
         pointer: "",
         expected: "must be a pull request number",
@@ -53769,7 +52778,7 @@ function readAuditSettings(settings) {
       ["head-sha", head]
     ])
       if (!REF.test(value2) || value2.startsWith("-"))
-        issues2.push({
+        issues.push({
           file: `input "${name}"`,
           pointer: "",
           expected: "must be a commit sha or a ref name",
@@ -53777,7 +52786,7 @@ function readAuditSettings(settings) {
         });
     target = { base, head };
   } else {
-    issues2.push({
+    issues.push({
       file: 'inputs "pull-request", "base-sha" and "head-sha"',
       pointer: "",
       expected: 'need "pull-request", or both "base-sha" and "head-sha"',
@@ -53786,7 +52795,7 @@ function readAuditSettings(settings) {
   }
   const commentText = (getInput("audit-comment") || "false").trim().toLowerCase();
   if (commentText !== "true" && commentText !== "false")
-    issues2.push({
+    issues.push({
       file: 'input "audit-comment"',
       pointer: "",
       expected: "must be true or false",
@@ -53795,7 +52804,7 @@ function readAuditSettings(settings) {
   let source = { kind: "contents", path: "" };
   if (settings.baselineArtifact !== null) {
     if (settings.baselineWorkflow === null)
-      issues2.push({
+      issues.push({
         file: 'input "baseline-workflow"',
         pointer: "",
         expected: 'is needed in audit mode with "baseline-artifact"',
@@ -53810,14 +52819,14 @@ function readAuditSettings(settings) {
   } else if (settings.candidate !== null) {
     source = { kind: "contents", path: settings.candidate.replace(/^\.\//, "") };
   } else {
-    issues2.push({
+    issues.push({
       file: 'inputs "baseline-artifact" and "candidate"',
       pointer: "",
       expected: "need one of them in audit mode",
       hint: 'Name the workflow artifact holding the run ("baseline-artifact" with "baseline-workflow"), or the committed run file ("candidate").'
     });
   }
-  if (issues2.length > 0) throw new InputError(issues2);
+  if (issues.length > 0) throw new InputError(issues);
   return { target, source, comment: commentText === "true" };
 }
 
@@ -53835,128 +52844,16 @@ function coreIO() {
 }
 
 // src/entries/action/publish-mode.ts
-import { join as join6 } from "node:path";
-function refuse2(issue2) {
-  throw new InputError([{ pointer: "", ...issue2 }]);
-}
-async function runPublish(deps) {
-  const { settings, context: context3, octokit, io } = deps;
-  const run = context3.workflowRun;
-  if (run === null || context3.eventName !== "workflow_run") {
-    refuse2({
-      file: 'input "mode"',
-      expected: 'may be "publish" only in a workflow triggered by workflow_run',
-      got: JSON.stringify(context3.eventName)
-    });
-  }
-  const files = await downloadBundle(deps, run);
-  const label = `artifact "${settings.reportArtifact}" (run ${run.id})`;
-  const note = readPullRequestNote(files.note, label);
-  const untrusted = readReview(files.review, label);
-  const failOn = settings.failOn?.filter(isFailOn) ?? untrusted.settings.failOn;
-  const review2 = { ...untrusted, settings: { ...untrusted.settings, failOn } };
-  review2.gate = applyGate(review2, failOn);
-  const fullName2 = `${context3.repo.owner}/${context3.repo.repo}`;
-  if (note.repository !== fullName2 || note.headSha !== run.headSha) {
-    refuse2({
-      file: `${label} ${PULL_REQUEST_FILE}`,
-      expected: `must name this repository (${fullName2}) and the run's head commit (${run.headSha})`,
-      got: `${note.repository} at ${note.headSha}`
-    });
-  }
-  const { data: pull } = await octokit.rest.pulls.get({
-    ...context3.repo,
-    pull_number: note.number
-  });
-  const pullHeadRepo = pull.head.repo?.full_name ?? null;
-  if (pullHeadRepo !== run.headRepo) {
-    refuse2({
-      file: `${label} ${PULL_REQUEST_FILE}`,
-      expected: `must name a PR whose head is in ${run.headRepo ?? "the run head repository"}`,
-      got: `PR #${note.number} from ${pullHeadRepo ?? "a deleted repository"}`
-    });
-  }
-  let body;
-  try {
-    body = renderMarkdown(review2, { commentKey: settings.commentKey, headSha: run.headSha });
-  } catch (error2) {
-    refuse2({
-      file: `${label} ${REVIEW_FILE}`,
-      expected: "must be a complete fitgap-review/1 report",
-      got: String(error2)
-    });
-  }
-  await io.appendSummary(body);
-  const written = await writeReportFiles(
-    join6(settings.tempDir, `fitgap-${settings.commentKey}`, "report"),
-    review2,
-    note
-  );
-  setReviewOutputs(io, review2, written.path, written.dir);
-  const problems = [];
-  const comment2 = await commentStep(
-    deps,
-    { pullNumber: note.number, headSha: run.headSha, currentHead: pull.head.sha },
-    body
-  );
-  if (comment2 !== null) problems.push(comment2);
-  const kind = settings.statusCheck === "auto" ? "check-run" : settings.statusCheck;
-  if (kind !== "off") {
-    const problem = await gateCheckStep(deps, kind, run.headSha, review2, body);
-    if (problem !== null) problems.push(problem);
-  }
-  if (!review2.gate.pass)
-    io.info(
-      `Gate failed (published on ${run.headSha}): ${gateReasonLines(review2, plainText).join("; ")}`
-    );
-  if (problems.length > 0) io.setFailed(problems.join("\n"));
-}
-async function downloadBundle(deps, run) {
-  const { settings, context: context3, octokit } = deps;
-  const name = settings.reportArtifact;
-  const { data } = await octokit.rest.actions.listWorkflowRunArtifacts({
-    ...context3.repo,
-    run_id: run.id,
-    name,
-    per_page: 100
-  });
-  const artifact = data.artifacts.find((a) => a.name === name && !a.expired);
-  if (artifact === void 0) {
-    refuse2({
-      file: 'input "report-artifact"',
-      expected: `must name an artifact of the triggering run ${run.id} (conclusion ${run.conclusion ?? "unknown"})`,
-      got: JSON.stringify(name),
-      hint: 'Upload the "report-dir" output of the review step under this name, also when the gate fails (if: always()).'
-    });
-  }
-  const zip = await downloadArtifact({
-    octokit,
-    repo: context3.repo,
-    artifact: { id: artifact.id, name, sizeInBytes: artifact.size_in_bytes, runId: run.id },
-    limitBytes: settings.archiveLimitBytes
-  });
-  const label = `artifact "${name}" (run ${run.id})`;
-  const entries = listEntries(zip, label);
-  const budget = { remaining: settings.archiveLimitBytes, limit: settings.archiveLimitBytes };
-  const read = (file) => {
-    const entry = entries.find((e) => e.name === file);
-    if (entry === void 0) refuse2({ file: label, expected: `must hold ${file} at its root` });
-    return readEntry(zip, entry, budget, label);
-  };
-  return { note: read(PULL_REQUEST_FILE), review: read(REVIEW_FILE) };
-}
-
-// src/entries/action/review-mode.ts
-import { basename as basename3, isAbsolute, join as join8, relative as relative2, resolve as resolve4 } from "node:path";
+import { join as join7 } from "node:path";
 
 // src/entries/action/baseline.ts
-import { mkdir as mkdir5, writeFile as writeFile5 } from "node:fs/promises";
-import { basename as basename2, dirname as dirname4, join as join7, resolve as resolve3 } from "node:path";
-async function resolveBaseline(deps) {
+import { mkdir as mkdir6, mkdtemp as mkdtemp3, writeFile as writeFile6 } from "node:fs/promises";
+import { basename as basename2, dirname as dirname4, join as join6, resolve as resolve4 } from "node:path";
+async function resolveBaseline(deps, baseBranch) {
   const { settings, context: context3, octokit, io } = deps;
-  if (settings.baseline !== null) return resolve3(settings.workspace, settings.baseline);
+  if (settings.baseline !== null) return resolve4(settings.workspace, settings.baseline);
   const name = settings.baselineArtifact ?? "";
-  const filter = runFilter(settings, context3);
+  const filter = baseBranch !== void 0 && settings.baselineRef === null ? { branch: baseBranch } : runFilter(settings, context3);
   const workflow = await currentWorkflow(deps);
   const artifact = await findArtifact({
     octokit,
@@ -53978,13 +52875,15 @@ async function resolveBaseline(deps) {
     limitBytes: settings.archiveLimitBytes,
     label: `artifact "${name}" (run ${artifact.runId})`
   });
-  const root = join7(settings.tempDir, `fitgap-${settings.commentKey}`, "baseline");
+  const parent = join6(settings.tempDir, `fitgap-${settings.commentKey}`);
+  await mkdir6(parent, { recursive: true });
+  const root = await mkdtemp3(join6(parent, "baseline-"));
   for (const [entry, bytes] of picked.files) {
-    const target = join7(root, ...entry.split(/[\\/]/));
-    await mkdir5(dirname4(target), { recursive: true });
-    await writeFile5(target, bytes);
+    const target = join6(root, ...entry.split(/[\\/]/));
+    await mkdir6(dirname4(target), { recursive: true });
+    await writeFile6(target, bytes, { flag: "wx" });
   }
-  return join7(root, ...picked.run.split(/[\\/]/));
+  return join6(root, ...picked.run.split(/[\\/]/));
 }
 function runFilter(settings, context3) {
   const ref = settings.baselineRef;
@@ -54013,27 +52912,149 @@ async function currentWorkflow(deps) {
   return data.workflow_id;
 }
 
+// src/entries/action/publish-mode.ts
+function refuse3(issue2) {
+  throw new InputError([{ pointer: "", ...issue2 }]);
+}
+async function runPublish(deps) {
+  const { settings, context: context3, octokit, io } = deps;
+  const run = context3.workflowRun;
+  if (run === null || context3.eventName !== "workflow_run") {
+    refuse3({
+      file: 'input "mode"',
+      expected: 'may be "publish" only in a workflow triggered by workflow_run',
+      got: JSON.stringify(context3.eventName)
+    });
+  }
+  const label = `artifact "${settings.reportArtifact}" (run ${run.id})`;
+  const zip = await downloadUpload(deps, run);
+  const work = join7(settings.tempDir, `fitgap-${settings.commentKey}`);
+  const bundle = await extractBundle({
+    zip,
+    label,
+    tempDir: join7(work, "upload"),
+    limitBytes: settings.archiveLimitBytes,
+    limits: resolveLimits({}, settings.limits)
+  });
+  const note = bundle.note;
+  const fullName2 = `${context3.repo.owner}/${context3.repo.repo}`;
+  if (note.repository !== fullName2 || note.headSha !== run.headSha) {
+    refuse3({
+      file: `${label} ${PULL_REQUEST_FILE}`,
+      expected: `must name this repository (${fullName2}) and the run's head commit (${run.headSha})`,
+      got: `${note.repository} at ${note.headSha}`
+    });
+  }
+  const { data: pull } = await octokit.rest.pulls.get({
+    ...context3.repo,
+    pull_number: note.number
+  });
+  const pullHeadRepo = pull.head.repo?.full_name ?? null;
+  if (pullHeadRepo !== run.headRepo) {
+    refuse3({
+      file: `${label} ${PULL_REQUEST_FILE}`,
+      expected: `must name a PR whose head is in ${run.headRepo ?? "the run head repository"}`,
+      got: `PR #${note.number} from ${pullHeadRepo ?? "a deleted repository"}`
+    });
+  }
+  const trustedBaseline = settings.baseline !== null || settings.baselineArtifact !== null;
+  const baseline = trustedBaseline ? await resolveBaseline(deps, pull.base.ref) : bundle.runs.baseline;
+  const uploaded = (side) => `${label} ${side}/${RUN_FILE}`;
+  const result = await reviewFiles({
+    baseline,
+    candidate: bundle.runs.candidate,
+    ...settings.config === null ? {} : { config: settings.config },
+    cwd: settings.workspace,
+    overrides: settings.overrides,
+    overrideLabel: (name) => `input "${name}"`,
+    limits: settings.limits,
+    // The upload holds the runs as the PR side reviewed them, an epoch log already merged.
+    epochLogs: false,
+    names: {
+      candidate: uploaded("candidate"),
+      ...trustedBaseline ? settings.baseline !== null ? { baseline: settings.baseline } : { baseline: `artifact ${settings.baselineArtifact ?? ""}: ${RUN_FILE}` } : { baseline: uploaded("baseline") }
+    }
+  });
+  const { review: review2, files } = result;
+  const provenance = {
+    files: [
+      { label: "baseline", ...files.baseline },
+      { label: "candidate", ...files.candidate },
+      ...files.config === null ? [] : [{ label: "config", ...files.config }]
+    ]
+  };
+  const body = renderMarkdown(review2, {
+    commentKey: settings.commentKey,
+    headSha: run.headSha,
+    provenance
+  });
+  await io.appendSummary(body);
+  const written = await writeReportFiles(join7(work, "report"), review2);
+  setReviewOutputs(io, review2, written.path, written.dir);
+  const problems = [];
+  const comment2 = await commentStep(
+    deps,
+    { pullNumber: note.number, headSha: run.headSha, currentHead: pull.head.sha },
+    body
+  );
+  if (comment2 !== null) problems.push(comment2);
+  const kind = settings.statusCheck === "auto" ? "check-run" : settings.statusCheck;
+  if (kind !== "off") {
+    const problem = await gateCheckStep(deps, kind, run.headSha, review2, body);
+    if (problem !== null) problems.push(problem);
+  }
+  if (!review2.gate.pass)
+    io.info(
+      `Gate failed (published on ${run.headSha}): ${gateReasonLines(review2, plainText).join("; ")}`
+    );
+  if (problems.length > 0) io.setFailed(problems.join("\n"));
+}
+async function downloadUpload(deps, run) {
+  const { settings, context: context3, octokit } = deps;
+  const name = settings.reportArtifact;
+  const { data } = await octokit.rest.actions.listWorkflowRunArtifacts({
+    ...context3.repo,
+    run_id: run.id,
+    name,
+    per_page: 100
+  });
+  const artifact = data.artifacts.find((a) => a.name === name && !a.expired);
+  if (artifact === void 0) {
+    refuse3({
+      file: 'input "report-artifact"',
+      expected: `must name an artifact of the triggering run ${run.id} (conclusion ${run.conclusion ?? "unknown"})`,
+      got: JSON.stringify(name),
+      hint: 'Upload the "report-dir" output of the review step under this name, also when the gate fails (if: always()).'
+    });
+  }
+  return downloadArtifact({
+    octokit,
+    repo: context3.repo,
+    artifact: { id: artifact.id, name, sizeInBytes: artifact.size_in_bytes, runId: run.id },
+    limitBytes: settings.archiveLimitBytes
+  });
+}
+
 // src/entries/action/review-mode.ts
+import { basename as basename3, isAbsolute as isAbsolute2, join as join8, relative as relative3, resolve as resolve5 } from "node:path";
 async function runReview(deps) {
   const { settings, context: context3, io } = deps;
   const baseline = await resolveBaseline(deps);
-  const overrides = {
-    ...settings.alpha === null ? {} : { alpha: settings.alpha },
-    ...settings.minEffect === null ? {} : { minEffect: settings.minEffect },
-    ...settings.failOn === null ? {} : { failOn: settings.failOn }
-  };
-  const { review: review2, files: inputs } = await reviewFiles({
+  const result = await reviewFiles({
     baseline,
     candidate: settings.candidate ?? "",
     ...settings.config === null ? {} : { config: settings.config },
     cwd: settings.workspace,
-    overrides
+    overrides: settings.overrides,
+    overrideLabel: (name) => `input "${name}"`,
+    limits: settings.limits
   });
+  const { review: review2, files: inputs } = result;
   const pr = context3.pullRequest;
   const headSha = pr?.headSha ?? context3.sha;
   const shown = (path) => {
-    const inside = relative2(settings.workspace, resolve4(settings.workspace, path));
-    if (inside !== "" && !inside.startsWith("..") && !isAbsolute(inside)) return inside;
+    const inside = relative3(settings.workspace, resolve5(settings.workspace, path));
+    if (inside !== "" && !inside.startsWith("..") && !isAbsolute2(inside)) return inside;
     const artifact = settings.baselineArtifact;
     return artifact === null ? basename3(path) : `artifact ${artifact}: ${basename3(path)}`;
   };
@@ -54048,14 +53069,16 @@ async function runReview(deps) {
   await io.appendSummary(body);
   const files = await writeReportFiles(
     join8(settings.tempDir, `fitgap-${settings.commentKey}`, "report"),
-    review2,
-    pr === null ? null : {
+    review2
+  );
+  if (pr !== null) {
+    await writeBundle(files.dir, result.runs, {
       format: "fitgap-pull-request/1",
       repository: `${context3.repo.owner}/${context3.repo.repo}`,
       number: pr.number,
       headSha: pr.headSha
-    }
-  );
+    });
+  }
   setReviewOutputs(io, review2, files.path, files.dir);
   const problems = [];
   if (pr !== null) {
@@ -54066,11 +53089,7 @@ async function runReview(deps) {
     const problem = await gateCheckStep(deps, settings.statusCheck, headSha, review2, body);
     if (problem !== null) problems.push(problem);
   }
-  if (!review2.gate.pass)
-    problems.unshift(
-      `fitgap gate failed:
-${gateReasonLines(review2, plainText).map((r) => `- ${r}`).join("\n")}`
-    );
+  if (!review2.gate.pass) problems.unshift(gateFailure(review2));
   if (problems.length > 0) io.setFailed(problems.join("\n"));
 }
 
@@ -54080,19 +53099,19 @@ function optional2(name) {
   const value2 = getInput(name);
   return value2 === "" ? null : value2;
 }
-function required(name, issues2) {
+function required(name, issues) {
   try {
     return getInput(name, { required: true });
   } catch {
-    issues2.push({ file: `input "${name}"`, pointer: "", expected: "is required", got: '""' });
+    issues.push({ file: `input "${name}"`, pointer: "", expected: "is required", got: '""' });
     return "";
   }
 }
-function oneOf(name, allowed, issues2) {
-  const value2 = required(name, issues2);
+function oneOf(name, allowed, issues) {
+  const value2 = required(name, issues);
   if (value2 === "") return allowed[0];
   if (allowed.includes(value2)) return value2;
-  issues2.push({
+  issues.push({
     file: `input "${name}"`,
     pointer: "",
     expected: `must be one of ${allowed.join(", ")}`,
@@ -54100,29 +53119,64 @@ function oneOf(name, allowed, issues2) {
   });
   return allowed[0];
 }
-function number(name, issues2, min, max2) {
-  const text2 = optional2(name);
-  if (text2 === null) return null;
-  const value2 = Number(text2);
-  if (!Number.isFinite(value2) || value2 < min || value2 > max2) {
-    issues2.push({
-      file: `input "${name}"`,
+var FIELD = {
+  alpha: "alpha",
+  "min-effect": "minEffect",
+  "gap-tolerance": "gapTolerance",
+  reference: "reference"
+};
+function overrideInputs(issues) {
+  const out = {};
+  for (const name of Object.keys(FIELD)) {
+    const text2 = optional2(name);
+    if (text2 === null) continue;
+    const parsed = parseNumberSetting(name, text2, { file: `input "${name}"`, pointer: "" });
+    if ("issues" in parsed) issues.push(...parsed.issues);
+    else out[FIELD[name]] = parsed.value;
+  }
+  const failOn = optional2("fail-on");
+  if (failOn !== null) {
+    const parsed = parseFailOn(failOn, { file: 'input "fail-on"', pointer: "" });
+    if ("issues" in parsed) issues.push(...parsed.issues);
+    else out.failOn = parsed.value;
+  }
+  return out;
+}
+function limitInputs(issues) {
+  const out = {};
+  for (const key of Object.keys(LIMIT_NAMES)) {
+    const name = LIMIT_NAMES[key].option;
+    const text2 = optional2(name);
+    if (text2 === null) continue;
+    const parsed = parseLimitMb(key, text2, `input "${name}"`);
+    if ("issues" in parsed) issues.push(...parsed.issues);
+    else out[key] = parsed.bytes;
+  }
+  return out;
+}
+function archiveLimit(issues) {
+  const text2 = optional2("archive-limit-mb");
+  if (text2 === null) return 50 * 1024 * 1024;
+  const value2 = /^\s*(?:\d+(?:\.\d*)?|\.\d+)\s*$/.test(text2) ? Number(text2) : Number.NaN;
+  if (!(value2 >= 1e-3 && value2 <= 2048)) {
+    issues.push({
+      file: 'input "archive-limit-mb"',
       pointer: "",
-      expected: `must be a number from ${min} to ${max2}`,
+      expected: "must be a number of MB from 0.001 to 2048",
       got: quote(text2)
     });
-    return null;
+    return 50 * 1024 * 1024;
   }
-  return value2;
+  return Math.round(value2 * 1024 * 1024);
 }
 function readSettings(env = process.env) {
-  const issues2 = [];
-  const mode = oneOf("mode", ["review", "publish", "audit"], issues2);
-  const candidate = mode === "review" ? required("candidate", issues2) : optional2("candidate");
+  const issues = [];
+  const mode = oneOf("mode", ["review", "publish", "audit"], issues);
+  const candidate = mode === "review" ? required("candidate", issues) : optional2("candidate");
   const baseline = optional2("baseline");
   const baselineArtifact = optional2("baseline-artifact");
   if (mode === "review" && baseline === null === (baselineArtifact === null)) {
-    issues2.push({
+    issues.push({
       file: 'inputs "baseline" and "baseline-artifact"',
       pointer: "",
       expected: "need exactly one of them",
@@ -54132,54 +53186,62 @@ function readSettings(env = process.env) {
   }
   const commentKey = getInput("comment-key") || "default";
   if (!isValidCommentKey(commentKey)) {
-    issues2.push({
+    issues.push({
       file: 'input "comment-key"',
       pointer: "",
       expected: "must be 1-64 letters, digits, '.', '_' or '-'",
       got: quote(commentKey)
     });
   }
-  const failOnText = optional2("fail-on");
-  const failOn = failOnText === null ? null : failOnText.split(/[\s,]+/).map((s) => s.trim()).filter((s) => s !== "");
-  issues2.push(...failOnIssues(failOn ?? [], 'input "fail-on"', ""));
-  const limitMb = number("archive-limit-mb", issues2, 1e-3, 2048) ?? 50;
+  const baselineWorkflow = optional2("baseline-workflow");
+  if (mode === "publish" && baselineArtifact !== null && baselineWorkflow === null) {
+    issues.push({
+      file: 'input "baseline-workflow"',
+      pointer: "",
+      expected: 'is needed with "baseline-artifact" in publish mode',
+      hint: "Name the workflow file (e.g. train.yml) whose runs on the base branch upload the baseline."
+    });
+  }
+  const overrides = overrideInputs(issues);
+  const limits = limitInputs(issues);
+  const archiveLimitBytes = archiveLimit(issues);
   const settings = {
     mode,
     candidate,
     baseline,
     baselineArtifact,
     baselineRef: optional2("baseline-ref"),
-    baselineWorkflow: optional2("baseline-workflow"),
+    baselineWorkflow,
     config: optional2("config"),
-    comment: oneOf("comment", ["update", "new", "off"], issues2),
+    comment: oneOf("comment", ["update", "new", "off"], issues),
     commentKey,
-    failOn,
-    alpha: number("alpha", issues2, Number.MIN_VALUE, 0.5),
-    minEffect: number("min-effect", issues2, 0, Number.MAX_VALUE),
+    overrides,
+    limits,
     statusCheck: oneOf(
       "status-check",
       ["auto", "check-run", "commit-status", "off"],
-      issues2
+      issues
     ),
     reportArtifact: getInput("report-artifact") || "fitgap-report",
-    archiveLimitBytes: Math.round(limitMb * 1024 * 1024),
+    archiveLimitBytes,
     api: {
       baseUrl: (env["GITHUB_API_URL"] ?? "https://api.github.com").replace(/\/+$/, ""),
-      token: required("github-token", issues2),
+      token: required("github-token", issues),
       retries: 2,
-      delayUnitMs: testDelayUnit(env)
+      delayUnitMs: testNumber(env, "FITGAP_TEST_DELAY_UNIT_MS", 1e3),
+      timeoutMs: testNumber(env, "FITGAP_TEST_TIMEOUT_MS", 3e4)
     },
     tempDir: env["RUNNER_TEMP"] ?? tmpdir(),
     workspace: env["GITHUB_WORKSPACE"] ?? process.cwd(),
     workflowRef: env["GITHUB_WORKFLOW_REF"] ?? null
   };
-  if (issues2.length > 0) throw new InputError(issues2);
+  if (issues.length > 0) throw new InputError(issues);
   return settings;
 }
-function testDelayUnit(env) {
-  const text2 = env["FITGAP_TEST_DELAY_UNIT_MS"];
+function testNumber(env, name, otherwise) {
+  const text2 = env[name];
   const value2 = text2 === void 0 ? NaN : Number(text2);
-  return Number.isFinite(value2) && value2 >= 0 ? value2 : 1e3;
+  return Number.isFinite(value2) && value2 > 0 ? value2 : otherwise;
 }
 
 // node_modules/@octokit/rest/dist-src/index.js
@@ -54533,6 +53595,21 @@ throttling.triggersNotification = triggersNotification;
 
 // src/io/github/client.ts
 var Client = Octokit2.plugin(retry, throttling);
+function fetchWithTimeout(base, ms) {
+  return async (input, init) => {
+    const timeout = AbortSignal.timeout(ms);
+    const signal = init?.signal ? AbortSignal.any([init.signal, timeout]) : timeout;
+    try {
+      return await base(input, { ...init, signal });
+    } catch (error2) {
+      if (timeout.aborted)
+        throw new TypeError("fetch failed", {
+          cause: new Error(`no answer within ${Math.round(ms / 100) / 10} s (timed out)`)
+        });
+      throw error2;
+    }
+  };
+}
 function createClient(options) {
   const limitRetries = options.rateLimitRetries ?? 2;
   const maxWait = options.maxRateLimitWaitS ?? 120;
@@ -54548,7 +53625,9 @@ function createClient(options) {
     baseUrl: options.baseUrl,
     auth: options.token,
     userAgent: "fitgap-action",
-    request: options.fetch === void 0 ? {} : { fetch: options.fetch },
+    request: {
+      fetch: fetchWithTimeout(options.fetch ?? globalThis.fetch, options.timeoutMs ?? 3e4)
+    },
     // 429 is left to the throttling plugin, which honours retry-after.
     retry: {
       retries: options.retries,
@@ -54581,15 +53660,15 @@ function buildRunContext(ctx) {
   const pr = record(payload["pull_request"]);
   const head = record(pr?.["head"]);
   const base = record(pr?.["base"]);
-  const number2 = pr?.["number"];
+  const number = pr?.["number"];
   const run = record(payload["workflow_run"]);
   return {
     repo: ctx.repo,
     eventName: ctx.eventName,
     sha: ctx.sha,
     runId: ctx.runId,
-    pullRequest: pr !== null && typeof number2 === "number" ? {
-      number: number2,
+    pullRequest: pr !== null && typeof number === "number" ? {
+      number,
       headSha: text(head?.["sha"]) ?? ctx.sha,
       baseRef: text(base?.["ref"]) ?? "",
       headRepo: fullName(head?.["repo"])

@@ -16,7 +16,14 @@ from fitgap_run import check_artifact
 PATTERNS = ["test/fixtures/bad/*.json", "test/fixtures/action/*.json", "test/fixtures/design/**/*.json",
             "demo/*.json"]
 # Rejected by fitgap for reasons Python's cheap checks do not look at.
-OUTSIDE_THE_JSON = {"predictions-missing.json": "the predictions CSV does not exist"}
+OUTSIDE_THE_JSON = {
+    "predictions-missing.json": "the predictions CSV does not exist",
+    # `fitgap validate` reads the predictions CSV too, as `review` does.
+    "cont-pred-bad.json": "a loss in its predictions CSV is not a number",
+    "p-bad-header.json": "its predictions CSV has the wrong header",
+    "p-duplicate.json": "its predictions CSV repeats an id",
+    "p-two.json": "a 0/1 cell of its predictions CSV holds 2",
+}
 
 
 def strict_load(path):

@@ -9,7 +9,7 @@
  * Series of the same name from several files are pooled. File access goes through `CurveLogFs`,
  * passed in so tests can fake it; files are opened in `readLogFile` only.
  */
-import { readFile, readdir, stat } from 'node:fs/promises';
+import { readdir, stat } from 'node:fs/promises';
 import { basename, dirname, join, relative, sep } from 'node:path';
 import { InputError, type Issue } from '../model/errors.js';
 import {
@@ -27,12 +27,13 @@ import {
   type ReadResult,
   type Series,
 } from '../artifact/curve-logs/index.js';
+import { DEFAULT_FILE_LIMITS, readChecked } from './open-untrusted.js';
 
 export type PathKind = 'file' | 'dir' | 'other' | 'missing';
 
 export interface CurveLogFs {
-  /** Whole contents of a file. */
-  readFile(path: string): Promise<Uint8Array>;
+  /** Whole contents of a file; `display` names it in messages. */
+  readFile(path: string, display?: string): Promise<Uint8Array>;
   /** Entries of a folder; symbolic links are `other` (not followed while searching). */
   readdir(path: string): Promise<{ name: string; kind: PathKind }[]>;
   /** What a path is (following a link the user named) and its size in bytes. */
@@ -40,7 +41,21 @@ export interface CurveLogFs {
 }
 
 export const nodeCurveLogFs: CurveLogFs = {
-  readFile: (path) => readFile(path),
+  // Opened as untrusted input (real path in its folder, regular file, fixed size); the size limit
+  // per format is checked by `readLogFile` first, so this one only bounds the read.
+  readFile: async (path, display) =>
+    (
+      await readChecked({
+        path,
+        file: display ?? path,
+        what: 'a training log',
+        limit: 'artifactBytes',
+        limits: {
+          ...DEFAULT_FILE_LIMITS,
+          artifactBytes: Math.max(MAX_EVENT_FILE_BYTES, MAX_TEXT_BYTES),
+        },
+      })
+    ).bytes,
   readdir: async (path) =>
     (await readdir(path, { withFileTypes: true })).map((d) => ({
       name: d.name,
@@ -131,7 +146,7 @@ async function readLogFile(fs: CurveLogFs, file: LogPath, maxBytes: number): Pro
       `must be at most ${maxBytes / 1024 / 1024} MiB (it has ${size} bytes)`,
       'Import a shorter log, or thin it out first.',
     );
-  return fs.readFile(file.path);
+  return fs.readFile(file.path, file.display);
 }
 
 async function kindOf(fs: CurveLogFs, p: LogPath): Promise<PathKind> {

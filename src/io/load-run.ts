@@ -1,17 +1,37 @@
 /**
  * Reads one run artifact from disk: JSON, schema and semantic validation, the sha256 of its bytes,
- * the predictions file beside it, and an epoch log mapped by the config. Adapter; throws InputError.
+ * the predictions file beside it (checked, and opened again for each pass of the CSV reader), and
+ * an epoch log mapped by the config. Every file goes through `open-untrusted.ts`. Adapter; throws
+ * InputError.
  */
 import { createHash } from 'node:crypto';
-import { readFile, stat } from 'node:fs/promises';
+import { lstat } from 'node:fs/promises';
+import type { Readable } from 'node:stream';
 import { dirname, relative, resolve, sep } from 'node:path';
 import { InputError, type Issue } from '../model/errors.js';
 import type { EpochLogMapping } from '../model/config.js';
 import { parseEpochLog } from '../artifact/epoch-log.js';
+import type { PredictionsFile } from '../artifact/predictions.js';
 import { parseJson } from '../artifact/read-json.js';
 import type { Note } from '../model/review.js';
 import type { RunArtifact } from '../model/run.js';
 import { semanticIssues, validateRun } from '../validate/run.js';
+import {
+  DEFAULT_FILE_LIMITS,
+  MissingFileError,
+  decodeUtf8,
+  openChecked,
+  readChecked,
+  streamChecked,
+  type FileLimits,
+  type UntrustedFile,
+} from './open-untrusted.js';
+
+/** A file that was read for a review: its real path and device:inode. */
+export interface ReadFile {
+  realPath: string;
+  id: string;
+}
 
 export interface LoadedRun {
   artifact: RunArtifact;
@@ -20,30 +40,20 @@ export interface LoadedRun {
   sha256: string;
   /** Resolved predictions CSV path, when the artifact names one. */
   predictionsPath: string | null;
+  /** The predictions CSV, opened afresh (and checked again) for every pass. */
+  predictions: PredictionsFile | null;
   /** What the loader did that the review should mention. */
   notes: Note[];
+  /** Every file read (the artifact, its predictions, its epoch log). */
+  read: ReadFile[];
 }
 
-async function readText(path: string, file: string, what: string): Promise<Buffer> {
-  try {
-    return await readFile(path);
-  } catch (error) {
-    const code = (error as NodeJS.ErrnoException).code;
-    throw new InputError([
-      {
-        file,
-        pointer: '',
-        expected: `could not be read as ${what}`,
-        got:
-          code === 'ENOENT'
-            ? 'no such file'
-            : code === 'EISDIR'
-              ? 'a directory'
-              : (code ?? String(error)),
-        hint: 'Check the path.',
-      },
-    ]);
-  }
+export interface LoadRunOptions {
+  epochLog?: EpochLogMapping;
+  displayName?: string;
+  limits?: FileLimits;
+  /** Receives every stream opened for the predictions, so the caller can close them all. */
+  track?: (stream: Readable) => void;
 }
 
 /** A path named inside an artifact, resolved against its folder; must not leave the folder. */
@@ -61,17 +71,45 @@ function besideArtifact(artifactPath: string, name: string): string | null {
   return target;
 }
 
-export async function loadRun(
-  path: string,
-  options: { epochLog?: EpochLogMapping; displayName?: string } = {},
-): Promise<LoadedRun> {
+/** `runs/epochs.csv` for an epoch log next to `runs/run.json`, as the user would name it. */
+function besideName(file: string, name: string): string {
+  return `${dirname(file) === '.' ? '' : `${dirname(file)}/`}${name}`;
+}
+
+/** A predictions CSV as the CSV reader takes it: opened (and checked) afresh for every pass. */
+export function predictionsSource(
+  target: UntrustedFile,
+  track?: (stream: Readable) => void,
+): PredictionsFile {
+  return {
+    file: target.file,
+    open: async () => {
+      const { stream } = await streamChecked(target);
+      track?.(stream);
+      return stream;
+    },
+  };
+}
+
+export async function loadRun(path: string, options: LoadRunOptions = {}): Promise<LoadedRun> {
   const file = options.displayName ?? path;
-  const bytes = await readText(path, file, 'a run artifact (JSON)');
+  const limits = options.limits ?? DEFAULT_FILE_LIMITS;
+  const folder = dirname(resolve(path));
+  const { bytes, file: checked } = await readChecked({
+    path,
+    file,
+    what: 'a run artifact (JSON)',
+    limit: 'artifactBytes',
+    limits,
+  });
+  const read: ReadFile[] = [{ realPath: checked.realPath, id: checked.id }];
   const sha256 = createHash('sha256').update(bytes).digest('hex');
-  const artifact = validateRun(parseJson(bytes.toString('utf8'), file), file);
+  const text = decodeUtf8(bytes, file, 'a run artifact');
+  const artifact = validateRun(parseJson(text, file), file);
   const notes: Note[] = [];
 
   let predictionsPath: string | null = null;
+  let predictions: PredictionsFile | null = null;
   if (artifact.predictions !== undefined) {
     predictionsPath = besideArtifact(path, artifact.predictions.path);
     const issue: Issue = {
@@ -82,25 +120,48 @@ export async function loadRun(
       hint: 'Put the predictions CSV next to the artifact, or remove "predictions".',
     };
     if (predictionsPath === null) throw new InputError([issue]);
-    const info = await stat(predictionsPath).catch(() => null);
-    if (info === null || !info.isFile())
-      throw new InputError([
-        { ...issue, expected: 'must name an existing file next to the artifact' },
-      ]);
+    const target: UntrustedFile = {
+      path: predictionsPath,
+      file: besideName(file, artifact.predictions.path),
+      what: 'a predictions CSV',
+      folder,
+      limit: 'csvBytes',
+      limits,
+    };
+    // Checked now, so a missing or refused file is reported with the artifact's other problems.
+    const first = await openChecked(target).catch((error: unknown) => {
+      if (error instanceof MissingFileError)
+        throw new InputError([
+          { ...issue, expected: 'must name an existing file next to the artifact' },
+        ]);
+      throw error;
+    });
+    await first.handle.close();
+    read.push({ realPath: first.realPath, id: first.id });
+    predictions = predictionsSource(target, options.track);
   }
 
   if (options.epochLog !== undefined) {
     const logPath = besideArtifact(path, options.epochLog.file);
-    const logName = `${dirname(file) === '.' ? '' : `${dirname(file)}/`}${options.epochLog.file}`;
-    const info = logPath === null ? null : await stat(logPath).catch(() => null);
-    if (logPath !== null && info?.isFile() === true) {
+    const logName = besideName(file, options.epochLog.file);
+    const present = logPath !== null && (await lstat(logPath).catch(() => null)) !== null;
+    if (logPath !== null && present) {
       if (artifact.curves?.epochs !== undefined) {
         notes.push({ code: 'epoch-log-not-used', file, log: logName });
       } else {
-        const text = (await readText(logPath, logName, 'an epoch log (CSV)')).toString('utf8');
+        const log = await readChecked({
+          path: logPath,
+          file: logName,
+          what: 'an epoch log (CSV)',
+          folder,
+          limit: 'artifactBytes',
+          limits,
+        });
+        read.push({ realPath: log.file.realPath, id: log.file.id });
+        const logText = decodeUtf8(log.bytes, logName, 'an epoch log');
         artifact.curves = {
           ...artifact.curves,
-          epochs: parseEpochLog(text, logName, options.epochLog),
+          epochs: parseEpochLog(logText, logName, options.epochLog),
         };
         // The mapped curve meets the same rules as an artifact's own (range, increasing x).
         const issues = semanticIssues(artifact, `${file} (with ${logName})`);
@@ -110,5 +171,5 @@ export async function loadRun(
       notes.push({ code: 'epoch-log-missing', file, log: logName });
     }
   }
-  return { artifact, file, sha256, predictionsPath, notes };
+  return { artifact, file, sha256, predictionsPath, predictions, notes, read };
 }

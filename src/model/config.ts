@@ -4,8 +4,11 @@ export interface ConfigFile {
   'min-effect'?: number;
   'gap-tolerance'?: number;
   reference?: number;
+  /** Outcomes that fail the gate (a list, or one text separated by commas or new lines). */
   'fail-on'?: string[];
   'epoch-log'?: EpochLogMapping;
+  /** Byte limits of the input files, in MB (the config file's own limit is set by flag or input). */
+  limits?: { 'artifact-mb'?: number; 'csv-mb'?: number };
   /** Non-inferiority margins by guardrail name. */
   guardrails?: Record<string, { margin: number }>;
 }

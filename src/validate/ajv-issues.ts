@@ -107,15 +107,32 @@ export function ajvIssues(errors: readonly ErrorObject[], file: string, doc: unk
   return issues;
 }
 
-/** Pointers of every number in a document that is not finite (JSON `1e999` parses to Infinity). */
-export function nonFiniteNumbers(doc: unknown, pointer = ''): string[] {
-  if (typeof doc === 'number') return Number.isFinite(doc) ? [] : [pointer];
-  if (Array.isArray(doc))
-    return doc.flatMap((item, i) => nonFiniteNumbers(item, `${pointer}/${i}`));
-  if (doc !== null && typeof doc === 'object') {
-    return Object.entries(doc).flatMap(([k, v]) =>
-      nonFiniteNumbers(v, `${pointer}/${escapePointerToken(k)}`),
-    );
+/**
+ * Numbers of a document that fitgap cannot compute with: not finite (JSON `1e999` parses to
+ * Infinity) or beyond ±`maxMagnitude`. Walks without recursion (the depth is bounded by the parser,
+ * but a walk should not depend on that); stops after `max` finds.
+ */
+export function outOfRangeNumbers(
+  doc: unknown,
+  maxMagnitude: number,
+  max = 10,
+): { pointer: string; value: number }[] {
+  const found: { pointer: string; value: number }[] = [];
+  const stack: [unknown, string][] = [[doc, '']];
+  while (stack.length > 0 && found.length < max) {
+    const [node, pointer] = stack.pop() as [unknown, string];
+    if (typeof node === 'number') {
+      if (!Number.isFinite(node) || Math.abs(node) > maxMagnitude)
+        found.push({ pointer, value: node });
+    } else if (Array.isArray(node)) {
+      for (let i = node.length - 1; i >= 0; i--) stack.push([node[i], `${pointer}/${i}`]);
+    } else if (node !== null && typeof node === 'object') {
+      const entries = Object.entries(node);
+      for (let i = entries.length - 1; i >= 0; i--) {
+        const [k, v] = entries[i] as [string, unknown];
+        stack.push([v, `${pointer}/${escapePointerToken(k)}`]);
+      }
+    }
   }
-  return [];
+  return found;
 }

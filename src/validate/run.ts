@@ -7,8 +7,9 @@ import addFormatsModule from 'ajv-formats';
 import type { ValidateFunction } from 'ajv';
 import schema from '../../schema/fitgap-run-1.schema.json' with { type: 'json' };
 import { InputError, quote, type Issue } from '../model/errors.js';
-import { ajvIssues, nonFiniteNumbers } from './ajv-issues.js';
+import { ajvIssues, outOfRangeNumbers } from './ajv-issues.js';
 import { guardrailIssues } from './guardrails.js';
+import { MAX_CURVE_POINTS, MAX_MAGNITUDE, formatLimit } from '../model/limits.js';
 import { CURVE_NAMES, SPLIT_NAMES, type RunArtifact } from '../model/run.js';
 
 // ajv-formats is CommonJS; its default export arrives wrapped under esbuild and Node alike.
@@ -65,6 +66,16 @@ export function semanticIssues(run: RunArtifact, file: string): Issue[] {
   for (const name of CURVE_NAMES) {
     const curve = run.curves?.[name];
     if (curve === undefined) continue;
+    if (curve.length > MAX_CURVE_POINTS) {
+      issues.push({
+        file,
+        pointer: `/curves/${name}`,
+        expected: `must have at most ${MAX_CURVE_POINTS} points`,
+        got: `${curve.length} points`,
+        hint: 'Log the curve less often, or keep every n-th point before writing the artifact.',
+      });
+      continue;
+    }
     curve.forEach((point, i) => {
       const at = `/curves/${name}/${i}`;
       inUnit(point.validation, `${at}/validation`);
@@ -134,16 +145,28 @@ export function semanticIssues(run: RunArtifact, file: string): Issue[] {
 
 /** Validate a parsed JSON document as a `fitgap-run/1` artifact. */
 export function validateRun(doc: unknown, file: string): RunArtifact {
-  const nonFinite = nonFiniteNumbers(doc);
-  if (nonFinite.length > 0) {
+  const numbers = outOfRangeNumbers(doc, MAX_MAGNITUDE);
+  if (numbers.length > 0) {
     throw new InputError(
-      nonFinite.map((pointer) => ({
-        file,
-        pointer,
-        expected: 'must be a finite number',
-        got: 'a number too large to represent (Infinity)',
-        hint: 'Write the measured value; JSON numbers such as 1e999 overflow.',
-      })),
+      numbers.map(({ pointer, value }) =>
+        Number.isFinite(value)
+          ? {
+              file,
+              pointer,
+              expected: `must be within ±${formatLimit(MAX_MAGNITUDE)}`,
+              got: quote(value),
+              hint: pointer.startsWith('/hyperparameters/')
+                ? 'Write large identifiers (seeds, hashes) as strings.'
+                : 'Rescale the metric (thousands instead of units); larger values overflow in the statistics.',
+            }
+          : {
+              file,
+              pointer,
+              expected: 'must be a finite number',
+              got: 'a number too large to represent (Infinity)',
+              hint: 'Write the measured value; JSON numbers such as 1e999 overflow.',
+            },
+      ),
     );
   }
   const validate = validator();

@@ -1,7 +1,7 @@
 /**
  * End-to-end runs of the built CLI (dist/cli.js) as a child process, as a user would run it.
  */
-import { execFile } from 'node:child_process';
+import { execFile, spawn } from 'node:child_process';
 import { existsSync, mkdtempSync, readFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
@@ -60,13 +60,16 @@ Options:
   --config FILE         config file (default: .github/fitgap.yml when it exists)
   --format FORMAT       text (default), markdown or json
   --out FILE            write the review to FILE instead of standard output
-  --alpha N             significance level (default 0.05)
+  --alpha N             significance level, 0.000001 to 0.5 (default 0.05)
   --min-effect N        smallest change that counts, in metric units (default 0)
-  --gap-tolerance N     component present at N x validation error (default 0.10)
+  --gap-tolerance N     component present at N x validation error, 0 to 1 (default 0.10)
   --reference N         reference level (human-level or Bayes error) for both runs
-  --fail-on LIST        comma-separated outcomes that fail the gate
-                        (default worse-validation; 'none' never fails)
+  --fail-on LIST        outcomes that fail the gate, separated by commas or new lines
+                        (default worse-validation; 'none' never fails; never empty)
   --comment-key KEY     key of the hidden marker in markdown output (default 'default')
+  --max-artifact-mb N   largest run artifact or epoch log read (default 16)
+  --max-config-mb N     largest config file read (default 1)
+  --max-csv-mb N        largest predictions CSV read (default 512)
   -h, --help            show this help
 
 Flags override the config file. Exit codes: 0 gate passed; 1 gate failed; 2 bad input.
@@ -175,5 +178,31 @@ describe('fitgap CLI (built)', () => {
     expect(bad.stderr).toBe(
       'test/fixtures/bad/bad-goal.json: /metric/goal must be one of "minimize", "maximize" (got "lower").\n',
     );
+  });
+
+  it("a reader that goes away (| head) ends the CLI quietly, with the review's own exit code", async () => {
+    for (const [failOn, expected] of [
+      ['none', 0],
+      ['any-movement', 1],
+    ] as const) {
+      const child = spawn(process.execPath, [
+        cli,
+        'review',
+        '--baseline',
+        'test/fixtures/design/example.json',
+        '--candidate',
+        'test/fixtures/design/candidate/example.json',
+        '--format',
+        'markdown',
+        '--fail-on',
+        failOn,
+      ]);
+      child.stdout.destroy(); // the reader is gone before the first byte: EPIPE
+      let stderr = '';
+      child.stderr.on('data', (chunk: Buffer) => (stderr += chunk.toString()));
+      const code = await new Promise<number | null>((done) => child.on('close', done));
+      expect(stderr).toBe('');
+      expect(code).toBe(expected);
+    }
   });
 });

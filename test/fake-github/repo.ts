@@ -18,6 +18,16 @@ export interface User {
 export const BOT: User = { login: 'github-actions[bot]', type: 'Bot' };
 export const PERSON: User = { login: 'octo-reviewer', type: 'User' };
 export const TOKEN = 'ghs_faketoken0123456789';
+/** A personal access token; it writes as MAINTAINER, a person. */
+export const PAT = 'ghp_fakepersonaltoken0123';
+export const MAINTAINER: User = { login: 'octo-maintainer', type: 'User' };
+
+/** Who a token writes as, or null for a token GitHub does not know. */
+export function userOf(authorization: string | undefined): User | null {
+  if (authorization === `token ${TOKEN}`) return BOT;
+  if (authorization === `token ${PAT}`) return MAINTAINER;
+  return null;
+}
 
 export interface Comment {
   id: number;
@@ -165,11 +175,20 @@ export class FakeRepo {
   install(): this {
     const s = this.server;
     const authed =
-      (handler: (r: FakeRequest) => FakeResponse) =>
-      (r: FakeRequest): FakeResponse =>
-        r.headers.authorization === `token ${TOKEN}`
-          ? handler(r)
-          : apiError(401, 'Bad credentials');
+      (handler: (r: FakeRequest, user: User) => FakeResponse) =>
+      (r: FakeRequest): FakeResponse => {
+        const user = userOf(r.headers.authorization);
+        return user === null ? apiError(401, 'Bad credentials') : handler(r, user);
+      };
+    s.on(
+      'GET /user',
+      authed((_r, user) => {
+        // An installation token may not ask who it is.
+        if (user.type === 'Bot') return apiError(403, 'Resource not accessible by integration');
+        const base = example('private-user');
+        return { status: 200, body: { ...base, login: user.login, type: user.type } };
+      }),
+    );
     s.on(
       'GET /repos/{owner}/{repo}/issues/{issue_number}/comments',
       authed((r) => {
@@ -191,19 +210,23 @@ export class FakeRepo {
     );
     s.on(
       'POST /repos/{owner}/{repo}/issues/{issue_number}/comments',
-      authed((r) => {
-        const comment = this.addComment(String((r.body as Json)['body']), BOT);
+      authed((r, user) => {
+        const body = String((r.body as Json)['body']);
+        if (body.length > 65_536) return apiError(422, 'Validation Failed');
+        const comment = this.addComment(body, user);
         return { status: 201, body: this.commentJson(comment) };
       }),
     );
     s.on(
       'PATCH /repos/{owner}/{repo}/issues/comments/{comment_id}',
-      authed((r) => {
+      authed((r, user) => {
         const comment = this.comments.find((c) => c.id === Number(r.params['comment_id']));
         if (comment === undefined) return apiError(404, 'Not Found');
-        if (comment.user.login !== BOT.login)
+        if (comment.user.login !== user.login)
           return apiError(403, 'Resource not accessible by integration');
-        comment.body = String((r.body as Json)['body']);
+        const body = String((r.body as Json)['body']);
+        if (body.length > 65_536) return apiError(422, 'Validation Failed');
+        comment.body = body;
         return { status: 200, body: this.commentJson(comment) };
       }),
     );

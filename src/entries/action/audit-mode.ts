@@ -13,7 +13,6 @@ import { auditCommitPair, auditPullRequest } from '../../io/audit-github.js';
 import type { GitHubAuditOptions } from '../../io/audit-github.js';
 import { publishComment } from '../../io/github/comment.js';
 import { loadReviewConfig } from '../../io/review-from-files.js';
-import type { SettingsOverrides } from '../../io/review-from-files.js';
 import type { PullRequestAudit } from '../../model/audit.js';
 import { pullRequestRecord, recordLine } from '../../report/audit-record.js';
 import {
@@ -37,14 +36,11 @@ export interface AuditDeps extends PublishDeps {
 
 export async function runAudit(deps: AuditDeps): Promise<void> {
   const { settings, context, octokit, io, audit } = deps;
-  const overrides: SettingsOverrides = {
-    ...(settings.alpha === null ? {} : { alpha: settings.alpha }),
-    ...(settings.minEffect === null ? {} : { minEffect: settings.minEffect }),
-    ...(settings.failOn === null ? {} : { failOn: settings.failOn }),
-  };
+  const overrides = settings.overrides;
   const { config, file: configFile } = await loadReviewConfig(
     settings.workspace,
     settings.config ?? undefined,
+    settings.limits,
   );
   const dir = join(settings.tempDir, `fitgap-${settings.commentKey}`, 'audit');
   await mkdir(dir, { recursive: true });
@@ -75,7 +71,7 @@ export async function runAudit(deps: AuditDeps): Promise<void> {
   });
   await io.appendSummary(body);
 
-  const report = await writeReportFiles(join(dir, 'report'), result.review, null);
+  const report = await writeReportFiles(join(dir, 'report'), result.review);
   const line = recordLine(
     pullRequestRecord(result, { recordedAt: deps.now().toISOString(), fitgapVersion: version }),
   );
@@ -97,7 +93,7 @@ export async function runAudit(deps: AuditDeps): Promise<void> {
       if (problem !== null) problems.push(problem);
     }
   }
-  if (settings.failOn !== null && !result.review.gate.pass)
+  if (overrides.failOn !== undefined && !result.review.gate.pass)
     problems.unshift(
       `fitgap gate failed:\n${gateReasonLines(result.review, plainText)
         .map((r) => `- ${r}`)

@@ -3,7 +3,7 @@
  * successful run of this workflow on the base branch (or for a commit), extracted under the
  * runner's temp folder.
  */
-import { mkdir, writeFile } from 'node:fs/promises';
+import { mkdir, mkdtemp, writeFile } from 'node:fs/promises';
 import { basename, dirname, join, resolve } from 'node:path';
 import { InputError } from '../../model/errors.js';
 import {
@@ -25,12 +25,18 @@ export interface BaselineDeps {
   io: ActionIO;
 }
 
-/** Absolute path of the baseline run artifact. */
-export async function resolveBaseline(deps: BaselineDeps): Promise<string> {
+/**
+ * Absolute path of the baseline run artifact. `baseBranch` (publish mode: the PR's base branch)
+ * replaces the branch the event names.
+ */
+export async function resolveBaseline(deps: BaselineDeps, baseBranch?: string): Promise<string> {
   const { settings, context, octokit, io } = deps;
   if (settings.baseline !== null) return resolve(settings.workspace, settings.baseline);
   const name = settings.baselineArtifact ?? '';
-  const filter = runFilter(settings, context);
+  const filter =
+    baseBranch !== undefined && settings.baselineRef === null
+      ? { branch: baseBranch }
+      : runFilter(settings, context);
   const workflow = await currentWorkflow(deps);
   const artifact = await findArtifact({
     octokit,
@@ -52,11 +58,14 @@ export async function resolveBaseline(deps: BaselineDeps): Promise<string> {
     limitBytes: settings.archiveLimitBytes,
     label: `artifact "${name}" (run ${artifact.runId})`,
   });
-  const root = join(settings.tempDir, `fitgap-${settings.commentKey}`, 'baseline');
+  const parent = join(settings.tempDir, `fitgap-${settings.commentKey}`);
+  await mkdir(parent, { recursive: true });
+  // A fresh folder: the archive's files never land on (or through) anything already there.
+  const root = await mkdtemp(join(parent, 'baseline-'));
   for (const [entry, bytes] of picked.files) {
     const target = join(root, ...entry.split(/[\\/]/));
     await mkdir(dirname(target), { recursive: true });
-    await writeFile(target, bytes);
+    await writeFile(target, bytes, { flag: 'wx' });
   }
   return join(root, ...picked.run.split(/[\\/]/));
 }

@@ -10,6 +10,8 @@ interface RequestErrorLike {
   status: number;
   message: string;
   request: { method: string; url: string };
+  /** Absent when no answer came (refused connection, timeout, DNS). */
+  response?: unknown;
 }
 
 function isRequestError(error: unknown): error is RequestErrorLike {
@@ -23,10 +25,21 @@ function isRequestError(error: unknown): error is RequestErrorLike {
   );
 }
 
-/** One line for a failed GitHub API call: method, path (no host, no query), status and message. */
+/**
+ * One line for a failed GitHub API call: method, path (no host, no query), and either the status
+ * and message of the answer or why no answer came.
+ */
 export function describeRequestError(error: RequestErrorLike): string {
   const path = new URL(error.request.url, 'http://api.invalid').pathname;
-  return `GitHub API ${error.request.method} ${path} answered ${error.status}: ${error.message}`;
+  const call = `GitHub API ${error.request.method} ${path}`;
+  if (error.response === undefined) return `${call} could not be reached: ${error.message}`;
+  const hint =
+    error.status === 401
+      ? ' (check the token given as "github-token")'
+      : error.status === 404
+        ? ' (check the repository, the number, and that the token may see them)'
+        : '';
+  return `${call} answered ${error.status}: ${error.message}${hint}`;
 }
 
 export function failureMessage(error: unknown): { message: string; stack: string | null } {

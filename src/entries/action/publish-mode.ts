@@ -1,25 +1,27 @@
 /**
- * Publish mode, for a `workflow_run` workflow (the fork-safe pattern): download the report
- * artifact of the triggering run, treat it as untrusted (validate its shape; check the PR number
- * against the API, the head sha against the event), then comment and publish the gate as a check
- * run on that head sha. The job's own status does not attach to the PR, so the gate lives in the
- * check; the step fails only when publishing fails.
+ * Publish mode, for a `workflow_run` workflow (the fork-safe pattern). The triggering run is
+ * untrusted: it uploaded run artifacts, not conclusions. This step downloads them, refuses
+ * anything but the known files, reads each one as untrusted input (size, schema, paths), checks
+ * the PR note against the event and the API, recomputes the review itself with the trusted config
+ * and inputs, and then comments and publishes the gate as a check run on the PR's head commit.
+ * Nothing from the upload is rendered but artifact strings, which the renderer escapes. The job's
+ * own status does not attach to the PR, so the gate lives in the check; the step fails only when
+ * publishing fails.
  */
-import { applyGate } from '../../analysis/gate.js';
+import { join } from 'node:path';
 import { InputError } from '../../model/errors.js';
 import type { Issue } from '../../model/errors.js';
 import { downloadArtifact } from '../../io/github/artifacts.js';
 import type { WorkflowRunRef } from '../../io/github/context.js';
-import { listEntries, readEntry } from '../../io/github/zip.js';
+import { PULL_REQUEST_FILE, RUN_FILE, extractBundle } from '../../io/bundle.js';
+import { resolveLimits, reviewFiles } from '../../io/review-from-files.js';
 import { plainText } from '../../report/escape.js';
 import { gateReasonLines } from '../../report/gate.js';
 import { renderMarkdown } from '../../report/markdown.js';
-import { isFailOn } from '../../model/settings.js';
-import { PULL_REQUEST_FILE, REVIEW_FILE, readPullRequestNote, readReview } from './bundle.js';
+import { resolveBaseline } from './baseline.js';
 import type { PublishDeps } from './publish-steps.js';
 import { commentStep, gateCheckStep, setReviewOutputs } from './publish-steps.js';
 import { writeReportFiles } from './report-files.js';
-import { join } from 'node:path';
 
 function refuse(issue: Omit<Issue, 'pointer'> & { pointer?: string }): never {
   throw new InputError([{ pointer: '', ...issue }]);
@@ -35,14 +37,17 @@ export async function runPublish(deps: PublishDeps): Promise<void> {
       got: JSON.stringify(context.eventName),
     });
   }
-  const files = await downloadBundle(deps, run);
   const label = `artifact "${settings.reportArtifact}" (run ${run.id})`;
-  const note = readPullRequestNote(files.note, label);
-  const untrusted = readReview(files.review, label);
-  // The gate policy is the publish workflow's (trusted), applied to the reported outcome.
-  const failOn = settings.failOn?.filter(isFailOn) ?? untrusted.settings.failOn;
-  const review = { ...untrusted, settings: { ...untrusted.settings, failOn } };
-  review.gate = applyGate(review, failOn);
+  const zip = await downloadUpload(deps, run);
+  const work = join(settings.tempDir, `fitgap-${settings.commentKey}`);
+  const bundle = await extractBundle({
+    zip,
+    label,
+    tempDir: join(work, 'upload'),
+    limitBytes: settings.archiveLimitBytes,
+    limits: resolveLimits({}, settings.limits),
+  });
+  const note = bundle.note;
   const fullName = `${context.repo.owner}/${context.repo.repo}`;
   if (note.repository !== fullName || note.headSha !== run.headSha) {
     refuse({
@@ -64,22 +69,46 @@ export async function runPublish(deps: PublishDeps): Promise<void> {
     });
   }
 
-  let body: string;
-  try {
-    body = renderMarkdown(review, { commentKey: settings.commentKey, headSha: run.headSha });
-  } catch (error) {
-    refuse({
-      file: `${label} ${REVIEW_FILE}`,
-      expected: 'must be a complete fitgap-review/1 report',
-      got: String(error),
-    });
-  }
+  // The baseline: the uploaded one, or (given "baseline" or "baseline-artifact") a trusted one.
+  const trustedBaseline = settings.baseline !== null || settings.baselineArtifact !== null;
+  const baseline = trustedBaseline
+    ? await resolveBaseline(deps, pull.base.ref)
+    : bundle.runs.baseline;
+  const uploaded = (side: string) => `${label} ${side}/${RUN_FILE}`;
+  const result = await reviewFiles({
+    baseline,
+    candidate: bundle.runs.candidate,
+    ...(settings.config === null ? {} : { config: settings.config }),
+    cwd: settings.workspace,
+    overrides: settings.overrides,
+    overrideLabel: (name) => `input "${name}"`,
+    limits: settings.limits,
+    // The upload holds the runs as the PR side reviewed them, an epoch log already merged.
+    epochLogs: false,
+    names: {
+      candidate: uploaded('candidate'),
+      ...(trustedBaseline
+        ? settings.baseline !== null
+          ? { baseline: settings.baseline }
+          : { baseline: `artifact ${settings.baselineArtifact ?? ''}: ${RUN_FILE}` }
+        : { baseline: uploaded('baseline') }),
+    },
+  });
+  const { review, files } = result;
+  const provenance = {
+    files: [
+      { label: 'baseline', ...files.baseline },
+      { label: 'candidate', ...files.candidate },
+      ...(files.config === null ? [] : [{ label: 'config', ...files.config }]),
+    ],
+  };
+  const body = renderMarkdown(review, {
+    commentKey: settings.commentKey,
+    headSha: run.headSha,
+    provenance,
+  });
   await io.appendSummary(body);
-  const written = await writeReportFiles(
-    join(settings.tempDir, `fitgap-${settings.commentKey}`, 'report'),
-    review,
-    note,
-  );
+  const written = await writeReportFiles(join(work, 'report'), review);
   setReviewOutputs(io, review, written.path, written.dir);
 
   const problems: string[] = [];
@@ -101,7 +130,8 @@ export async function runPublish(deps: PublishDeps): Promise<void> {
   if (problems.length > 0) io.setFailed(problems.join('\n'));
 }
 
-async function downloadBundle(deps: PublishDeps, run: WorkflowRunRef) {
+/** The triggering run's upload, refused before download when listed over the archive limit. */
+async function downloadUpload(deps: PublishDeps, run: WorkflowRunRef): Promise<Uint8Array> {
   const { settings, context, octokit } = deps;
   const name = settings.reportArtifact;
   const { data } = await octokit.rest.actions.listWorkflowRunArtifacts({
@@ -119,19 +149,10 @@ async function downloadBundle(deps: PublishDeps, run: WorkflowRunRef) {
       hint: 'Upload the "report-dir" output of the review step under this name, also when the gate fails (if: always()).',
     });
   }
-  const zip = await downloadArtifact({
+  return downloadArtifact({
     octokit,
     repo: context.repo,
     artifact: { id: artifact.id, name, sizeInBytes: artifact.size_in_bytes, runId: run.id },
     limitBytes: settings.archiveLimitBytes,
   });
-  const label = `artifact "${name}" (run ${run.id})`;
-  const entries = listEntries(zip, label);
-  const budget = { remaining: settings.archiveLimitBytes, limit: settings.archiveLimitBytes };
-  const read = (file: string) => {
-    const entry = entries.find((e) => e.name === file);
-    if (entry === undefined) refuse({ file: label, expected: `must hold ${file} at its root` });
-    return readEntry(zip, entry, budget, label);
-  };
-  return { note: read(PULL_REQUEST_FILE), review: read(REVIEW_FILE) };
 }

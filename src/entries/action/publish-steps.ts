@@ -4,10 +4,11 @@
  */
 import type { Review } from '../../model/review.js';
 import { publishGate } from '../../io/github/check.js';
-import { escapeInline } from '../../report/escape.js';
+import { escapeInline, plainText } from '../../report/escape.js';
 import { gateReasonLines } from '../../report/gate.js';
 import type { GitHubClient } from '../../io/github/client.js';
 import { publishComment } from '../../io/github/comment.js';
+import { resolveIdentity } from '../../io/github/identity.js';
 import type { RunContext } from '../../io/github/context.js';
 import { describeRequestError, isRequestError } from './failure.js';
 import type { ActionIO } from './io.js';
@@ -34,6 +35,13 @@ export function setReviewOutputs(
   io.setOutput('report-dir', reportDir);
 }
 
+/** The step's failure message when the gate failed (one plain line per reason). */
+export function gateFailure(review: Review): string {
+  return `fitgap gate failed:\n${gateReasonLines(review, plainText)
+    .map((r) => `- ${r}`)
+    .join('\n')}`;
+}
+
 export function runUrl(context: RunContext): string {
   return `${context.serverUrl}/${context.repo.owner}/${context.repo.repo}/actions/runs/${context.runId}`;
 }
@@ -47,9 +55,14 @@ export async function commentStep(
   const { settings, context, octokit, io } = deps;
   if (settings.comment === 'off') return null;
   try {
+    const identity =
+      settings.comment === 'update'
+        ? await resolveIdentity(octokit, settings.api.token)
+        : undefined;
     const outcome = await publishComment({
       octokit,
       repo: context.repo,
+      ...(identity === undefined ? {} : { identity }),
       pullNumber: target.pullNumber,
       headSha: target.headSha,
       key: settings.commentKey,

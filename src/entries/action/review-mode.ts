@@ -1,33 +1,30 @@
 /**
  * Review mode: review the candidate against the baseline, then publish in this order: job summary,
- * JSON report, outputs, comment, gate. The gate is applied even when commenting fails.
+ * JSON report (and, on a pull request, the bundle of runs for a publish workflow), outputs,
+ * comment, gate. The gate is applied even when commenting fails.
  */
 import { basename, isAbsolute, join, relative, resolve } from 'node:path';
-import { plainText } from '../../report/escape.js';
-import { gateReasonLines } from '../../report/gate.js';
 import { renderMarkdown } from '../../report/markdown.js';
 import { reviewFiles } from '../../io/review-from-files.js';
-import type { SettingsOverrides } from '../../io/review-from-files.js';
+import { writeBundle } from '../../io/bundle.js';
 import { resolveBaseline } from './baseline.js';
 import type { PublishDeps } from './publish-steps.js';
-import { commentStep, gateCheckStep, setReviewOutputs } from './publish-steps.js';
+import { commentStep, gateCheckStep, gateFailure, setReviewOutputs } from './publish-steps.js';
 import { writeReportFiles } from './report-files.js';
 
 export async function runReview(deps: PublishDeps): Promise<void> {
   const { settings, context, io } = deps;
   const baseline = await resolveBaseline(deps);
-  const overrides: SettingsOverrides = {
-    ...(settings.alpha === null ? {} : { alpha: settings.alpha }),
-    ...(settings.minEffect === null ? {} : { minEffect: settings.minEffect }),
-    ...(settings.failOn === null ? {} : { failOn: settings.failOn }),
-  };
-  const { review, files: inputs } = await reviewFiles({
+  const result = await reviewFiles({
     baseline,
     candidate: settings.candidate ?? '',
     ...(settings.config === null ? {} : { config: settings.config }),
     cwd: settings.workspace,
-    overrides,
+    overrides: settings.overrides,
+    overrideLabel: (name) => `input "${name}"`,
+    limits: settings.limits,
   });
+  const { review, files: inputs } = result;
   const pr = context.pullRequest;
   const headSha = pr?.headSha ?? context.sha;
   // Paths as a reader knows them (workspace-relative, or the artifact's name), so that the same
@@ -53,15 +50,16 @@ export async function runReview(deps: PublishDeps): Promise<void> {
   const files = await writeReportFiles(
     join(settings.tempDir, `fitgap-${settings.commentKey}`, 'report'),
     review,
-    pr === null
-      ? null
-      : {
-          format: 'fitgap-pull-request/1',
-          repository: `${context.repo.owner}/${context.repo.repo}`,
-          number: pr.number,
-          headSha: pr.headSha,
-        },
   );
+  if (pr !== null) {
+    // Inputs for a publish workflow, which recomputes the review on the trusted side.
+    await writeBundle(files.dir, result.runs, {
+      format: 'fitgap-pull-request/1',
+      repository: `${context.repo.owner}/${context.repo.repo}`,
+      number: pr.number,
+      headSha: pr.headSha,
+    });
+  }
   setReviewOutputs(io, review, files.path, files.dir);
 
   const problems: string[] = [];
@@ -73,11 +71,6 @@ export async function runReview(deps: PublishDeps): Promise<void> {
     const problem = await gateCheckStep(deps, settings.statusCheck, headSha, review, body);
     if (problem !== null) problems.push(problem);
   }
-  if (!review.gate.pass)
-    problems.unshift(
-      `fitgap gate failed:\n${gateReasonLines(review, plainText)
-        .map((r) => `- ${r}`)
-        .join('\n')}`,
-    );
+  if (!review.gate.pass) problems.unshift(gateFailure(review));
   if (problems.length > 0) io.setFailed(problems.join('\n'));
 }

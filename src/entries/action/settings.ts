@@ -6,8 +6,10 @@ import * as core from '@actions/core';
 import { tmpdir } from 'node:os';
 import { InputError, quote } from '../../model/errors.js';
 import type { Issue } from '../../model/errors.js';
-import { failOnIssues } from '../../io/load-config.js';
 import { isValidCommentKey } from '../../report/marker.js';
+import { parseFailOn, parseNumberSetting, type NumberSettingName } from '../../model/settings.js';
+import type { SettingsOverrides } from '../../io/review-from-files.js';
+import { LIMIT_NAMES, parseLimitMb, type FileLimits } from '../../io/open-untrusted.js';
 
 export type ActionMode = 'review' | 'publish' | 'audit';
 export type CommentMode = 'update' | 'new' | 'off';
@@ -25,6 +27,8 @@ export interface ApiSettings {
    * 1000 in production; tests shrink it through `FITGAP_TEST_DELAY_UNIT_MS` (test-only).
    */
   delayUnitMs: number;
+  /** Milliseconds a request may take (30 s; tests shrink it through `FITGAP_TEST_TIMEOUT_MS`). */
+  timeoutMs: number;
 }
 
 export interface Settings {
@@ -42,10 +46,10 @@ export interface Settings {
   config: string | null;
   comment: CommentMode;
   commentKey: string;
-  /** Policy list; null leaves it to the config file or the core's default. */
-  failOn: string[] | null;
-  alpha: number | null;
-  minEffect: number | null;
+  /** Settings given as inputs (`alpha`, `min-effect`, `gap-tolerance`, `reference`, `fail-on`); they win over the config file. */
+  overrides: SettingsOverrides;
+  /** Byte limits given as inputs (`max-artifact-mb`…); they win over the config file's `limits`. */
+  limits: Partial<FileLimits>;
   statusCheck: StatusCheckMode;
   /** Name of the artifact that carries the review into the publish workflow. */
   reportArtifact: string;
@@ -90,20 +94,60 @@ function oneOf<T extends string>(name: string, allowed: readonly T[], issues: Is
   return allowed[0] as T;
 }
 
-function number(name: string, issues: Issue[], min: number, max: number): number | null {
-  const text = optional(name);
-  if (text === null) return null;
-  const value = Number(text);
-  if (!Number.isFinite(value) || value < min || value > max) {
+const FIELD: Record<NumberSettingName, 'alpha' | 'minEffect' | 'gapTolerance' | 'reference'> = {
+  alpha: 'alpha',
+  'min-effect': 'minEffect',
+  'gap-tolerance': 'gapTolerance',
+  reference: 'reference',
+};
+
+/** The review settings given as inputs, parsed by the one settings source (model/settings.ts). */
+function overrideInputs(issues: Issue[]): SettingsOverrides {
+  const out: SettingsOverrides = {};
+  for (const name of Object.keys(FIELD) as NumberSettingName[]) {
+    const text = optional(name);
+    if (text === null) continue;
+    const parsed = parseNumberSetting(name, text, { file: `input "${name}"`, pointer: '' });
+    if ('issues' in parsed) issues.push(...parsed.issues);
+    else out[FIELD[name]] = parsed.value;
+  }
+  // An empty input is an unset input on GitHub: the config file's fail-on, else the default.
+  const failOn = optional('fail-on');
+  if (failOn !== null) {
+    const parsed = parseFailOn(failOn, { file: 'input "fail-on"', pointer: '' });
+    if ('issues' in parsed) issues.push(...parsed.issues);
+    else out.failOn = parsed.value;
+  }
+  return out;
+}
+
+function limitInputs(issues: Issue[]): Partial<FileLimits> {
+  const out: Partial<FileLimits> = {};
+  for (const key of Object.keys(LIMIT_NAMES) as (keyof FileLimits)[]) {
+    const name = LIMIT_NAMES[key].option;
+    const text = optional(name);
+    if (text === null) continue;
+    const parsed = parseLimitMb(key, text, `input "${name}"`);
+    if ('issues' in parsed) issues.push(...parsed.issues);
+    else out[key] = parsed.bytes;
+  }
+  return out;
+}
+
+function archiveLimit(issues: Issue[]): number {
+  const text = optional('archive-limit-mb');
+  if (text === null) return 50 * 1024 * 1024;
+  const value = /^\s*(?:\d+(?:\.\d*)?|\.\d+)\s*$/.test(text) ? Number(text) : Number.NaN;
+  if (!(value >= 0.001 && value <= 2048)) {
     issues.push({
-      file: `input "${name}"`,
+      file: 'input "archive-limit-mb"',
       pointer: '',
-      expected: `must be a number from ${min} to ${max}`,
+      expected: 'must be a number of MB from 0.001 to 2048',
       got: quote(text),
     });
-    return null;
+    return 50 * 1024 * 1024;
   }
-  return value;
+  return Math.round(value * 1024 * 1024);
 }
 
 /** Reads every input and the runner environment. Throws `InputError` listing all bad inputs. */
@@ -131,41 +175,43 @@ export function readSettings(env: Env = process.env): Settings {
       got: quote(commentKey),
     });
   }
-  const failOnText = optional('fail-on');
-  const failOn =
-    failOnText === null
-      ? null
-      : failOnText
-          .split(/[\s,]+/)
-          .map((s) => s.trim())
-          .filter((s) => s !== '');
-  issues.push(...failOnIssues(failOn ?? [], 'input "fail-on"', ''));
-  const limitMb = number('archive-limit-mb', issues, 0.001, 2048) ?? 50;
+  const baselineWorkflow = optional('baseline-workflow');
+  if (mode === 'publish' && baselineArtifact !== null && baselineWorkflow === null) {
+    issues.push({
+      file: 'input "baseline-workflow"',
+      pointer: '',
+      expected: 'is needed with "baseline-artifact" in publish mode',
+      hint: 'Name the workflow file (e.g. train.yml) whose runs on the base branch upload the baseline.',
+    });
+  }
+  const overrides = overrideInputs(issues);
+  const limits = limitInputs(issues);
+  const archiveLimitBytes = archiveLimit(issues);
   const settings: Settings = {
     mode,
     candidate,
     baseline,
     baselineArtifact,
     baselineRef: optional('baseline-ref'),
-    baselineWorkflow: optional('baseline-workflow'),
+    baselineWorkflow,
     config: optional('config'),
     comment: oneOf<CommentMode>('comment', ['update', 'new', 'off'], issues),
     commentKey,
-    failOn,
-    alpha: number('alpha', issues, Number.MIN_VALUE, 0.5),
-    minEffect: number('min-effect', issues, 0, Number.MAX_VALUE),
+    overrides,
+    limits,
     statusCheck: oneOf<StatusCheckMode>(
       'status-check',
       ['auto', 'check-run', 'commit-status', 'off'],
       issues,
     ),
     reportArtifact: core.getInput('report-artifact') || 'fitgap-report',
-    archiveLimitBytes: Math.round(limitMb * 1024 * 1024),
+    archiveLimitBytes,
     api: {
       baseUrl: (env['GITHUB_API_URL'] ?? 'https://api.github.com').replace(/\/+$/, ''),
       token: required('github-token', issues),
       retries: 2,
-      delayUnitMs: testDelayUnit(env),
+      delayUnitMs: testNumber(env, 'FITGAP_TEST_DELAY_UNIT_MS', 1000),
+      timeoutMs: testNumber(env, 'FITGAP_TEST_TIMEOUT_MS', 30_000),
     },
     tempDir: env['RUNNER_TEMP'] ?? tmpdir(),
     workspace: env['GITHUB_WORKSPACE'] ?? process.cwd(),
@@ -175,9 +221,12 @@ export function readSettings(env: Env = process.env): Settings {
   return settings;
 }
 
-/** Test-only: `FITGAP_TEST_DELAY_UNIT_MS` shrinks retry and rate-limit waits so tests stay fast. */
-function testDelayUnit(env: Env): number {
-  const text = env['FITGAP_TEST_DELAY_UNIT_MS'];
+/**
+ * Test-only knobs: `FITGAP_TEST_DELAY_UNIT_MS` shrinks retry and rate-limit waits,
+ * `FITGAP_TEST_TIMEOUT_MS` the request timeout, so tests stay fast.
+ */
+function testNumber(env: Env, name: string, otherwise: number): number {
+  const text = env[name];
   const value = text === undefined ? NaN : Number(text);
-  return Number.isFinite(value) && value >= 0 ? value : 1000;
+  return Number.isFinite(value) && value > 0 ? value : otherwise;
 }

@@ -11,10 +11,9 @@ import type { AuditArtifactSource, GitHubAuditOptions } from '../../io/audit-git
 import { auditRange } from '../../io/audit.js';
 import { gitRunner } from '../../io/git.js';
 import { createClient } from '../../io/github/client.js';
-import { failOnIssues } from '../../io/load-config.js';
 import { loadReviewConfig } from '../../io/review-from-files.js';
 import type { AuditAgainst, PullRequestAudit, RangeAudit } from '../../model/audit.js';
-import { EXIT, InputError, UsageError } from '../../model/errors.js';
+import { EXIT, UsageError } from '../../model/errors.js';
 import { renderAuditMarkdown } from '../../report/audit-markdown.js';
 import {
   renderPullRequestAuditMarkdown,
@@ -93,11 +92,7 @@ export async function auditCommand(argv: string[], io: CliIo): Promise<number> {
   }
   if (positionals.length > 0) throw usage(`unexpected argument ${JSON.stringify(positionals[0])}.`);
   const format = parseFormat(values['format'], 'audit');
-  const overrides = parseOverrides(values, 'audit');
-  if (overrides.failOn !== undefined) {
-    const issues = failOnIssues(overrides.failOn, '--fail-on', '');
-    if (issues.length > 0) throw new InputError(issues);
-  }
+  const overrides = parseOverrides(values);
   const range = text(values, 'range');
   const repo = text(values, 'repo');
   if ((range === undefined) === (repo === undefined))
@@ -107,7 +102,7 @@ export async function auditCommand(argv: string[], io: CliIo): Promise<number> {
         : '--range and --repo audit different things; give one of them.',
     );
   const configOption = text(values, 'config');
-  const { config, file: configFile } = await loadReviewConfig(io.cwd, configOption);
+  const { config, file: configFile, read } = await loadReviewConfig(io.cwd, configOption);
   const now = (io.now ?? (() => new Date()))();
   const context = { recordedAt: now.toISOString(), fitgapVersion: io.version };
   const tempDir = io.tempDir ?? tmpdir();
@@ -152,7 +147,7 @@ export async function auditCommand(argv: string[], io: CliIo): Promise<number> {
   const out = text(values, 'out');
   if (out === undefined) io.stdout(output);
   else {
-    await io.writeFile(resolve(io.cwd, out), output);
+    await io.writeFile(resolve(io.cwd, out), output, { file: out, inputs: read });
     if (!quiet) io.stderr(`fitgap: audit written to ${out}.\n`);
   }
   // Only an explicit --fail-on turns outcomes into exit code 1: an audit reports by default.

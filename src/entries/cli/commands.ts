@@ -2,10 +2,18 @@
 import { readdir } from 'node:fs/promises';
 import { join, resolve } from 'node:path';
 import { loadRun } from '../../io/load-run.js';
-import { failOnIssues, loadConfig } from '../../io/load-config.js';
+import { loadConfig } from '../../io/load-config.js';
 import { EXIT, InputError, UsageError, formatIssue } from '../../model/errors.js';
-import { reviewFiles } from '../../io/review-from-files.js';
-import { parseFlags, parseFormat, parseOverrides } from './args.js';
+import { DEFAULT_CONFIG_PATH, resolveLimits, reviewFiles } from '../../io/review-from-files.js';
+import { checkPredictions } from '../../artifact/predictions.js';
+import {
+  LIMIT_FLAGS,
+  SETTING_FLAGS,
+  parseFlags,
+  parseFormat,
+  parseLimits,
+  parseOverrides,
+} from './args.js';
 import { DEMO_HELP, REVIEW_HELP, VALIDATE_HELP } from './help.js';
 import type { CliIo } from './io.js';
 import { renderReview } from './render.js';
@@ -17,11 +25,8 @@ const REVIEW_FLAGS = {
   config: { type: 'string' },
   format: { type: 'string' },
   out: { type: 'string' },
-  alpha: { type: 'string' },
-  'min-effect': { type: 'string' },
-  'gap-tolerance': { type: 'string' },
-  reference: { type: 'string' },
-  'fail-on': { type: 'string' },
+  ...SETTING_FLAGS,
+  ...LIMIT_FLAGS,
   'comment-key': { type: 'string' },
   help: { type: 'boolean', short: 'h' },
 } as const;
@@ -44,11 +49,8 @@ export async function reviewCommand(argv: string[], io: CliIo): Promise<number> 
     );
   }
   const format = parseFormat(values['format'], 'review');
-  const overrides = parseOverrides(values, 'review');
-  if (overrides.failOn !== undefined) {
-    const issues = failOnIssues(overrides.failOn, '--fail-on', '');
-    if (issues.length > 0) throw new InputError(issues);
-  }
+  const overrides = parseOverrides(values);
+  const limits = parseLimits(values);
   const commentKey = values['comment-key'];
   if (typeof commentKey === 'string' && !isValidCommentKey(commentKey)) {
     throw new UsageError(
@@ -61,6 +63,8 @@ export async function reviewCommand(argv: string[], io: CliIo): Promise<number> 
     candidate,
     cwd: io.cwd,
     overrides,
+    overrideLabel: (name) => `--${name}`,
+    limits,
     ...(typeof config === 'string' ? { config } : {}),
   });
   const text = renderReview(result, format, {
@@ -69,7 +73,7 @@ export async function reviewCommand(argv: string[], io: CliIo): Promise<number> 
   });
   const out = values['out'];
   if (typeof out === 'string') {
-    await io.writeFile(resolve(io.cwd, out), text);
+    await io.writeFile(resolve(io.cwd, out), text, { file: out, inputs: result.read });
     io.stderr(
       `fitgap: review written to ${out} (gate ${result.review.gate.pass ? 'passed' : 'failed'}).\n`,
     );
@@ -80,7 +84,7 @@ export async function reviewCommand(argv: string[], io: CliIo): Promise<number> 
 export async function validateCommand(argv: string[], io: CliIo): Promise<number> {
   const { values, positionals } = parseFlags(
     argv,
-    { help: { type: 'boolean', short: 'h' } },
+    { help: { type: 'boolean', short: 'h' }, config: { type: 'string' }, ...LIMIT_FLAGS },
     'validate',
   );
   if (values['help'] === true) {
@@ -89,14 +93,32 @@ export async function validateCommand(argv: string[], io: CliIo): Promise<number
   }
   if (positionals.length === 0)
     throw new UsageError("fitgap validate: name at least one file. Run 'fitgap validate --help'.");
+  const given = parseLimits(values);
+  // The same config as `review` would use: its epoch-log mapping and limits apply to the artifacts.
+  const configName = typeof values['config'] === 'string' ? values['config'] : undefined;
+  const loaded = await loadConfig(
+    resolve(io.cwd, configName ?? DEFAULT_CONFIG_PATH),
+    configName ?? DEFAULT_CONFIG_PATH,
+    configName !== undefined,
+    resolveLimits({}, given),
+  );
+  const config = loaded?.config ?? {};
+  const limits = resolveLimits(config, given);
+  const epochLog = config['epoch-log'];
   let failed = false;
   for (const file of positionals) {
     try {
       if (/\.ya?ml$/i.test(file)) {
-        await loadConfig(resolve(io.cwd, file), file, true);
+        await loadConfig(resolve(io.cwd, file), file, true, limits);
         io.stdout(`${file}: valid config\n`);
       } else {
-        const run = await loadRun(resolve(io.cwd, file), { displayName: file });
+        const run = await loadRun(resolve(io.cwd, file), {
+          displayName: file,
+          limits,
+          ...(epochLog === undefined ? {} : { epochLog }),
+        });
+        if (run.predictions !== null)
+          await checkPredictions(run.predictions, run.artifact.metric.kind);
         io.stdout(
           `${file}: valid run artifact "${run.artifact.run.name}" (${run.artifact.splits.train.values.length} repeat(s))\n`,
         );

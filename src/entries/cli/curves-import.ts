@@ -1,4 +1,6 @@
 /** `fitgap curves import`: a training log in, a run artifact's `curves.epochs` out. */
+import { identify } from '../../io/write-output.js';
+import type { ReadFile } from '../../io/load-run.js';
 import { resolve } from 'node:path';
 import {
   CURVE_LOG_FORMATS,
@@ -114,7 +116,14 @@ export async function curvesImportCommand(
       ? { x: p.x, validation: p.validation }
       : { x: p.x, train: p.train, validation: p.validation },
   );
-  await io.writeFile(resolve(io.cwd, out), `${JSON.stringify({ epochs }, null, 2)}\n`);
+  // --out must not overwrite a log it read.
+  const inputs = (await Promise.all(paths.map((p) => identify(p.path)))).filter(
+    (f): f is ReadFile => f !== null,
+  );
+  await io.writeFile(resolve(io.cwd, out), `${JSON.stringify({ epochs }, null, 2)}\n`, {
+    file: out,
+    inputs,
+  });
   for (const line of curveImportNotes(curve, out)) io.stderr(`fitgap: ${line}\n`);
   return EXIT.ok;
 }

@@ -34,22 +34,31 @@ Options:
   --config FILE         config file (default: .github/fitgap.yml when it exists)
   --format FORMAT       text (default), markdown or json
   --out FILE            write the review to FILE instead of standard output
-  --alpha N             significance level (default 0.05)
+  --alpha N             significance level, 0.000001 to 0.5 (default 0.05)
   --min-effect N        smallest change that counts, in metric units (default 0)
-  --gap-tolerance N     component present at N x validation error (default 0.10)
+  --gap-tolerance N     component present at N x validation error, 0 to 1 (default 0.10)
   --reference N         reference level (human-level or Bayes error) for both runs
-  --fail-on LIST        comma-separated outcomes that fail the gate
-                        (default worse-validation; 'none' never fails)
+  --fail-on LIST        outcomes that fail the gate, separated by commas or new lines
+                        (default worse-validation; 'none' never fails; never empty)
   --comment-key KEY     key of the hidden marker in markdown output (default 'default')
+  --max-artifact-mb N   largest run artifact or epoch log read (default 16)
+  --max-config-mb N     largest config file read (default 1)
+  --max-csv-mb N        largest predictions CSV read (default 512)
   -h, --help            show this help
 
 Flags override the config file. Exit codes: 0 gate passed; 1 gate failed; 2 bad input.
 `;
 
-export const VALIDATE_HELP = `Usage: fitgap validate FILE...
+export const VALIDATE_HELP = `Usage: fitgap validate [--config FILE] FILE...
 
-Check run artifacts (.json, with their predictions CSV) and config files (.yml, .yaml).
+Check run artifacts (.json, with their predictions CSV and, when the config maps one, their
+epoch log) and config files (.yml, .yaml): everything 'fitgap review' would check.
 Prints one line per file; exit code 0 when all are valid, 2 otherwise.
+
+Options:
+  --config FILE         config whose epoch-log mapping and limits apply
+                        (default: .github/fitgap.yml when it exists)
+  --max-artifact-mb N, --max-config-mb N, --max-csv-mb N   file limits, as for review
 `;
 
 export const DEMO_HELP = `Usage: fitgap demo [NAME] [--format text|markdown|json]

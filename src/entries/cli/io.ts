@@ -1,11 +1,18 @@
 /** What the CLI needs from the outside world, passed in so tests can hand in fakes. */
+import type { ReadFile } from '../../io/load-run.js';
+
 export interface CliIo {
   stdout: (text: string) => void;
   stderr: (text: string) => void;
   /** Colour allowed (a TTY and NO_COLOR unset). */
   color: boolean;
   cwd: string;
-  writeFile: (path: string, text: string) => Promise<void>;
+  /** Writes `--out`; must refuse to overwrite any of `inputs` (the entry uses `io/write-output.ts`). */
+  writeFile: (
+    path: string,
+    text: string,
+    options: { file: string; inputs: readonly ReadFile[] },
+  ) => Promise<void>;
   /** Folder holding the bundled demo scenario. */
   demoDir: string;
   version: string;

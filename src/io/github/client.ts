@@ -23,11 +23,37 @@ export interface ClientOptions {
   throttle?: boolean;
   /** Transport, e.g. a proxy-aware fetch. */
   fetch?: typeof fetch;
+  /**
+   * Milliseconds a request may take before it is abandoned (and retried like a 5xx).
+   * @default 30000
+   */
+  timeoutMs?: number;
   /** Receives one line per retry or rate-limit wait. */
   log?: (message: string) => void;
 }
 
 const Client = Octokit.plugin(retry, throttling);
+
+/**
+ * A fetch that gives up after `ms`. The timeout is raised as a network failure (a `TypeError`
+ * with a cause), which octokit turns into a request error with status 500 and the retry plugin
+ * retries; its message says what happened.
+ */
+export function fetchWithTimeout(base: typeof fetch, ms: number): typeof fetch {
+  return async (input, init) => {
+    const timeout = AbortSignal.timeout(ms);
+    const signal = init?.signal ? AbortSignal.any([init.signal, timeout]) : timeout;
+    try {
+      return await base(input, { ...init, signal });
+    } catch (error) {
+      if (timeout.aborted)
+        throw new TypeError('fetch failed', {
+          cause: new Error(`no answer within ${Math.round(ms / 100) / 10} s (timed out)`),
+        });
+      throw error;
+    }
+  };
+}
 
 export function createClient(options: ClientOptions): GitHubClient {
   const limitRetries = options.rateLimitRetries ?? 2;
@@ -47,7 +73,9 @@ export function createClient(options: ClientOptions): GitHubClient {
     baseUrl: options.baseUrl,
     auth: options.token,
     userAgent: 'fitgap-action',
-    request: options.fetch === undefined ? {} : { fetch: options.fetch },
+    request: {
+      fetch: fetchWithTimeout(options.fetch ?? globalThis.fetch, options.timeoutMs ?? 30_000),
+    },
     // 429 is left to the throttling plugin, which honours retry-after.
     retry: {
       retries: options.retries,

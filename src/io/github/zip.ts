@@ -134,8 +134,17 @@ export function readEntry(
       `more while inflating ${JSON.stringify(entry.name)}`,
       'Raise "archive-limit-mb" if the archive is genuine.',
     );
+  const corrupt = (detail: string): never =>
+    refuse(
+      label,
+      `must hold readable data in ${JSON.stringify(entry.name)}`,
+      detail,
+      'The archive is damaged; upload it again.',
+    );
   if (entry.method === 0) {
     if (data.length > budget.remaining) over();
+    if (data.length !== entry.size || data.length !== entry.compressedSize)
+      corrupt(`${data.length} stored bytes where its directory says ${entry.size}`);
     budget.remaining -= data.length;
     return data.slice();
   }
@@ -149,10 +158,15 @@ export function readEntry(
     chunks.push(chunk);
   });
   const step = 64 * 1024;
-  for (let i = 0; i < data.length; i += step) {
-    inflater.push(data.subarray(i, i + step), i + step >= data.length);
+  try {
+    for (let i = 0; i < data.length; i += step) {
+      inflater.push(data.subarray(i, i + step), i + step >= data.length);
+    }
+    if (data.length === 0) inflater.push(new Uint8Array(0), true);
+  } catch (error) {
+    if (error instanceof InputError) throw error; // the budget ran out
+    corrupt(`invalid deflate data (${error instanceof Error ? error.message : String(error)})`);
   }
-  if (data.length === 0) inflater.push(new Uint8Array(0), true);
   if (total !== entry.size) {
     refuse(
       label,
