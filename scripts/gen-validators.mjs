@@ -3,7 +3,7 @@
 // start-up. Same ajv options as a compiled validator, so the same errors. Output is committed;
 // CI regenerates it and fails when it differs (`node scripts/gen-validators.mjs --check`).
 //
-//   node scripts/gen-validators.mjs          write src/artifact/generated/*
+//   node scripts/gen-validators.mjs          write src/validate/generated/*
 //   node scripts/gen-validators.mjs --check  exit 1 when a generated file is stale
 import { Buffer } from 'node:buffer';
 import { readFileSync, writeFileSync, mkdirSync } from 'node:fs';
@@ -20,7 +20,7 @@ import * as prettier from 'prettier';
 const require = createRequire(import.meta.url);
 const addFormats = addFormatsModule.default ?? addFormatsModule;
 const ucs2length = ucs2lengthModule.default ?? ucs2lengthModule;
-const OUT = 'src/artifact/generated';
+const OUT = 'src/validate/generated';
 const code = { source: true, esm: true, formats: _`formats` };
 
 const json = (path) => JSON.parse(readFileSync(path, 'utf8'));
@@ -38,14 +38,14 @@ async function tsSchemas(path) {
   const text = out.outputFiles[0].text;
   return import(`data:text/javascript;base64,${Buffer.from(text).toString('base64')}`);
 }
-const bundleSchemas = await tsSchemas('src/action/bundle-schemas.ts');
+const bundleSchemas = await tsSchemas('src/io/bundle-schemas.ts');
 
 const targets = [
   {
     name: 'run-schema',
     from: 'schema/fitgap-run-1.schema.json',
     schema: json('schema/fitgap-run-1.schema.json'),
-    // As src/artifact/validate.ts compiled it.
+    // The options src/validate/run.ts compiled it with.
     ajv: () => new Ajv2020({ allErrors: true, strict: true, strictNumbers: true, code }),
     formats: ['date-time'],
   },
@@ -53,23 +53,16 @@ const targets = [
     name: 'config-schema',
     from: 'schema/fitgap-config.schema.json',
     schema: json('schema/fitgap-config.schema.json'),
-    // As src/config/load-config.ts compiled it.
-    ajv: () => new Ajv2020({ allErrors: true, strict: true, code }),
+    // The options src/io/load-config.ts compiled it with.
+    ajv: () => new Ajv2020({ allErrors: true, strict: true, strictNumbers: true, code }),
     formats: [],
   },
   {
     name: 'pull-request-note',
-    from: 'src/action/bundle-schemas.ts (pullRequestSchema)',
+    from: 'src/io/bundle-schemas.ts (pullRequestSchema)',
     schema: bundleSchemas.pullRequestSchema,
-    // As src/action/bundle.ts compiled it.
-    ajv: () => new Ajv({ allErrors: true, code }),
-    formats: [],
-  },
-  {
-    name: 'review-bundle',
-    from: 'src/action/bundle-schemas.ts (reviewSchema)',
-    schema: bundleSchemas.reviewSchema,
-    ajv: () => new Ajv({ allErrors: true, code }),
+    // The options src/io/bundle.ts compiled it with.
+    ajv: () => new Ajv({ allErrors: true, strictNumbers: true, code }),
     formats: [],
   },
 ];

@@ -181,6 +181,24 @@ const moreData = run(
   ],
 );
 
+// Guardrail and cost (fixed values, no random draws, so the curves above stay as they were): the
+// expected calibration error of the late-delivery probabilities must not rise by more than half a
+// point, and training time is logged per seed. The more-data candidate improves the error on
+// both counts but its probabilities drift: a guardrail regression hidden by a better primary metric.
+const calibration = (values) => ({
+  metric: { name: 'calibration_error', goal: 'minimize', kind: 'continuous' },
+  splits: { validation: { values } },
+  margin: 0.005,
+});
+baseline.guardrails = [calibration([0.021, 0.0205, 0.0215])];
+baseline.cost = { trainSeconds: [412, 405, 418], parameters: 19 };
+interactions.guardrails = [calibration([0.0222, 0.0218, 0.0226])];
+interactions.cost = { trainSeconds: [538, 529, 546], parameters: 41 };
+heavy.guardrails = [calibration([0.0195, 0.0199, 0.0192])];
+heavy.cost = { trainSeconds: [409, 414, 402], parameters: 19 };
+moreData.guardrails = [calibration([0.0338, 0.0331, 0.0345])];
+moreData.cost = { trainSeconds: [986, 1003, 975], parameters: 21 };
+
 const write = (file, doc) => writeFileSync(`demo/${file}`, `${JSON.stringify(doc, null, 2)}\n`);
 write('baseline.json', baseline);
 write('1-interactions.json', interactions);
@@ -195,5 +213,8 @@ gap-tolerance: 0.10
 fail-on:
   - worse-validation
   - slice-regression
+  - guardrail-regression
+guardrails:
+  calibration_error: { margin: 0.005 }   # half a point of expected calibration error
 `,
 );

@@ -1,15 +1,21 @@
 /**
  * Error decomposition of one run (DESIGN.md §3) and its diagnosis (§6). Pure.
  */
-import type { RunArtifact } from '../artifact/types.js';
+import type { RunArtifact } from '../model/run.js';
 import { mean } from '../stats/index.js';
 import { shortfallSign, type Measure } from './measure.js';
 import { measureLevel } from './noise.js';
-import type { Component, ComponentName, Diagnosis, RunSummary } from './types.js';
+import type {
+  Component,
+  ComponentName,
+  Diagnosis,
+  ReferenceSource,
+  UnavailableCode,
+} from '../model/review.js';
 
 export interface ReferenceChoice {
   value: number | null;
-  source: RunSummary['referenceSource'];
+  source: ReferenceSource;
 }
 
 /** The reference level: config override, the artifact's own, 0 for a minimized proportion, else unknown. */
@@ -68,12 +74,12 @@ export function errorLevel(run: RunArtifact): number {
   return Math.abs(run.metric.goal === 'minimize' ? m : 1 - m);
 }
 
-const UNAVAILABLE: Record<ComponentName, string> = {
-  bias: 'No reference level: give "reference" in the artifact or the config (human-level error, a prior system, or an estimated Bayes error).',
-  variance: 'Needs train and validation values.',
-  mismatch: 'Needs a train_dev split (held-out data from the training distribution).',
-  overfit: 'Needs a test split.',
-};
+/** Why a component has no value. Variance needs train and validation, which every run has. */
+const UNAVAILABLE = new Map<ComponentName, UnavailableCode>([
+  ['bias', 'no-reference'],
+  ['mismatch', 'no-train-dev'],
+  ['overfit', 'no-test'],
+]);
 
 export interface DecomposeSettings {
   alpha: number;
@@ -93,14 +99,9 @@ export function decompose(
     const measure = measures[name];
     const level = measure === null ? null : measureLevel(run, measure, settings.alpha);
     if (level === null) {
-      out[name] = {
-        name,
-        value: null,
-        unavailable: UNAVAILABLE[name],
-        ci: null,
-        p: null,
-        present: false,
-      };
+      const unavailable = UNAVAILABLE.get(name);
+      if (unavailable === undefined) throw new Error(`${name} needs splits every run has`);
+      out[name] = { name, value: null, unavailable, ci: null, p: null, present: false };
       continue;
     }
     const significant = level.p === null || level.p < settings.alpha;

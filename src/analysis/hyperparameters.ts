@@ -1,6 +1,6 @@
 /** The hyperparameter diff between two runs and the levers a change already pulled. Pure. */
-import type { Hyperparameters } from '../artifact/types.js';
-import type { HyperparameterChange, LeverId } from './types.js';
+import type { Hyperparameters } from '../model/run.js';
+import type { HyperparameterChange, LeverId } from '../model/review.js';
 
 export function diffHyperparameters(
   baseline: Hyperparameters = {},

@@ -4,7 +4,7 @@
  * From a run it yields per-repeat values and, for one repeat of a proportion metric, a binomial
  * variance. Pure.
  */
-import type { RunArtifact, SplitName } from '../artifact/types.js';
+import type { RunArtifact, SplitName } from '../model/run.js';
 import { binomialVariance, mean } from '../stats/index.js';
 
 export interface Term {

@@ -1,5 +1,5 @@
 /** The headline: how the change moved the model in the bias/variance plane (DESIGN.md §5). Pure. */
-import type { Call, Movement, ValidationChange } from './types.js';
+import type { Call, Movement, ValidationChange } from '../model/review.js';
 
 const TABLE: Record<Call, Record<Call, Movement>> = {
   down: { down: 'better-on-both', flat: 'away-from-underfitting', up: 'toward-overfitting' },

@@ -2,11 +2,11 @@
  * Significance of a measure's change between two runs, and of a component being above 0 within
  * one run, choosing the test DESIGN.md §4 prescribes for the noise information available. Pure.
  */
-import type { RunArtifact } from '../artifact/types.js';
+import type { RunArtifact } from '../model/run.js';
 import { mean, normalCdf, normalTest, oneSampleT, welchT } from '../stats/index.js';
 import type { Interval, TestResult } from '../stats/types.js';
 import { binomialMeasureVariance, perRepeat, type Measure } from './measure.js';
-import type { Call, Delta } from './types.js';
+import type { Call, MetricDelta, ShortfallDelta } from '../model/review.js';
 
 export interface CallSettings {
   alpha: number;
@@ -21,7 +21,17 @@ export function callOf(result: TestResult, settings: CallSettings): Call {
   return result.estimate > 0 ? 'up' : 'down';
 }
 
-export function toDelta(result: TestResult, settings: CallSettings): Delta {
+/** A test result as a change in shortfall units (up = worse), called at the settings. */
+export function toShortfallDelta(result: TestResult, settings: CallSettings): ShortfallDelta {
+  return { unit: 'shortfall', ...deltaFields(result, settings) };
+}
+
+/** A test result as a change in metric units, called at the settings. */
+export function toMetricDelta(result: TestResult, settings: CallSettings): MetricDelta {
+  return { unit: 'metric', ...deltaFields(result, settings) };
+}
+
+function deltaFields(result: TestResult, settings: CallSettings): Omit<MetricDelta, 'unit'> {
   return {
     estimate: result.estimate,
     ci: result.ci,

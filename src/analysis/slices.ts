@@ -2,11 +2,11 @@
  * Per-slice validation changes with Holm–Bonferroni correction over the slices tested, and the
  * slices that regressed while the aggregate improved. Pure.
  */
-import type { RunArtifact, Slice } from '../artifact/types.js';
+import type { RunArtifact, Slice } from '../model/run.js';
 import { binomialVariance, holmAdjust, normalTest } from '../stats/index.js';
 import type { TestResult } from '../stats/types.js';
-import { callOf, type CallSettings } from './noise.js';
-import type { SliceChange, ValidationChange } from './types.js';
+import { callOf, toMetricDelta, type CallSettings } from './noise.js';
+import type { SliceChange, ValidationChange } from '../model/review.js';
 
 function sliceTest(b: Slice, c: Slice, proportion: boolean, alpha: number): TestResult {
   const estimate = c.validation - b.validation;
@@ -54,13 +54,7 @@ export function compareSlices(
       examples: c.examples ?? null,
       baseline: b.validation,
       candidate: c.validation,
-      delta: {
-        estimate: test.estimate,
-        ci: test.ci,
-        p: test.p,
-        test: test.test,
-        call: callOf(test, settings),
-      },
+      delta: toMetricDelta(test, settings),
       pAdjusted,
       change,
       hiddenRegression: change === 'worse' && aggregate === 'better',

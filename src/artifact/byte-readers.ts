@@ -1,5 +1,5 @@
 /** The bytes of a predictions file, as the byte-level reader (prediction-lines.ts) takes them. */
-import type { FileHandle } from 'node:fs/promises';
+import type { Readable } from 'node:stream';
 
 /** Bytes of one file, from the start; `read` returns 0 at the end. */
 export interface ByteReader {
@@ -8,36 +8,30 @@ export interface ByteReader {
 }
 
 /**
- * Where the bytes of a predictions file come from. The caller opens the file (and so decides what
- * may be opened: path, file type, size); the reader only reads it. A file handle is read with
- * explicit positions; a function returns a fresh stream of the whole file on every call. Both can
- * be read more than once: a file whose ids may repeat is read again to find and name the lines
- * (predictions.ts). The file's size (`stat`) of a handle sizes the id table.
+ * One pass over a file through `open`, which returns a fresh stream of the whole file on every
+ * call: the io layer opens the file and decides what may be read (real path, file type, size); this
+ * reader never opens anything itself. The stream is opened on the first read and destroyed on
+ * `close`. Read errors (an `InputError` for a file that changed while read) arrive from `read`.
  */
-export type PredictionsSource = FileHandle | (() => AsyncIterable<Uint8Array>);
-
-export function handleReader(handle: FileHandle): ByteReader {
-  let position = 0;
-  return {
-    async read(into, offset, length) {
-      const { bytesRead } = await handle.read(into, offset, length, position);
-      position += bytesRead;
-      return bytesRead;
-    },
-    async close() {},
-  };
-}
-
-export function iterableReader(make: () => AsyncIterable<Uint8Array>): ByteReader {
-  const iterator = make()[Symbol.asyncIterator]();
+export function streamReader(open: () => Promise<Readable>): ByteReader {
+  let stream: Readable | null = null;
+  let iterator: AsyncIterator<unknown> | null = null;
   let chunk: Uint8Array | null = null;
   let at = 0;
   return {
     async read(into, offset, length) {
+      if (iterator === null) {
+        stream = await open();
+        iterator = stream[Symbol.asyncIterator]();
+      }
       while (chunk === null || at >= chunk.length) {
         const next = await iterator.next();
         if (next.done === true) return 0;
-        chunk = next.value;
+        const value: unknown = next.value;
+        // A stream in text mode would change the bytes (decoding); the reader needs them as they are.
+        if (!(value instanceof Uint8Array))
+          throw new TypeError('a predictions stream must yield bytes, not text');
+        chunk = value;
         at = 0;
       }
       const n = Math.min(length, chunk.length - at);
@@ -46,7 +40,28 @@ export function iterableReader(make: () => AsyncIterable<Uint8Array>): ByteReade
       return n;
     },
     async close() {
-      await iterator.return?.();
+      stream?.destroy();
+    },
+  };
+}
+
+/**
+ * One pass over a file through `open`, which returns a fresh byte source of the whole file on every
+ * call (the io layer opens and checks the file; this reader never opens anything itself). The
+ * source is opened on the first read and closed on `close`.
+ */
+export function lazyReader(open: () => Promise<ByteReader>): ByteReader {
+  let source: ByteReader | null = null;
+  let closed = false;
+  return {
+    async read(into, offset, length) {
+      if (closed) return 0;
+      source ??= await open();
+      return source.read(into, offset, length);
+    },
+    async close() {
+      closed = true;
+      await source?.close();
     },
   };
 }

@@ -2,9 +2,11 @@
  * Turns a CSV epoch log (e.g. `epoch,train_loss,val_loss`) into `curves.epochs` using the column
  * mapping from the config. Adapter helper: parses text it is given; the caller reads the file.
  */
-import { InputError, quote, type Issue } from '../errors.js';
-import type { EpochLogMapping } from '../config/types.js';
-import type { CurvePoint } from './types.js';
+import { InputError, quote, type Issue } from '../model/errors.js';
+import type { EpochLogMapping } from '../model/config.js';
+import type { CurvePoint } from '../model/run.js';
+import { MAX_CURVE_POINTS, MAX_MAGNITUDE, formatLimit } from '../model/limits.js';
+import { parseDecimal } from '../model/settings.js';
 
 function splitCsvLine(line: string): string[] {
   return line.split(',').map((cell) => cell.trim().replace(/^"(.*)"$/, '$1'));
@@ -13,6 +15,22 @@ function splitCsvLine(line: string): string[] {
 export function parseEpochLog(text: string, file: string, mapping: EpochLogMapping): CurvePoint[] {
   const lines = text.replace(/^\uFEFF/, '').split(/\r?\n/);
   const header = splitCsvLine(lines[0] ?? '');
+  const seen = new Map<string, number>();
+  header.forEach((name, i) => {
+    const first = seen.get(name);
+    if (first !== undefined) {
+      throw new InputError([
+        {
+          file,
+          pointer: 'line 1',
+          expected: `must name each column once (column ${i + 1} repeats column ${first + 1})`,
+          got: quote(name),
+          hint: 'Rename one of the columns; a repeated name makes the mapping ambiguous.',
+        },
+      ]);
+    }
+    seen.set(name, i);
+  });
   const column = (name: string | undefined, role: string): number | undefined => {
     if (name === undefined) return undefined;
     const index = header.indexOf(name);
@@ -41,14 +59,15 @@ export function parseEpochLog(text: string, file: string, mapping: EpochLogMappi
     const cells = splitCsvLine(raw);
     const read = (index: number, name: string): number => {
       const cell = cells[index] ?? '';
-      const value = cell === '' ? Number.NaN : Number(cell);
-      if (!Number.isFinite(value)) {
+      const value = parseDecimal(cell) ?? Number.NaN;
+      if (!Number.isFinite(value) || Math.abs(value) > MAX_MAGNITUDE) {
         issues.push({
           file,
           pointer: `line ${i + 1}`,
-          expected: `column "${name}" must be a finite number`,
+          expected: `column "${name}" must be a decimal number within ±${formatLimit(MAX_MAGNITUDE)}`,
           got: quote(cell),
         });
+        return Number.NaN;
       }
       return value;
     };
@@ -65,6 +84,15 @@ export function parseEpochLog(text: string, file: string, mapping: EpochLogMappi
     }
     points.push(point);
     if (issues.length >= 10) break;
+    if (points.length > MAX_CURVE_POINTS) {
+      issues.push({
+        file,
+        pointer: `line ${i + 1}`,
+        expected: `must have at most ${MAX_CURVE_POINTS} data rows (a curve's limit)`,
+        hint: 'Log less often, or keep every n-th row.',
+      });
+      break;
+    }
   }
   if (issues.length > 0) throw new InputError(issues);
   if (points.length === 0)

@@ -2,7 +2,7 @@
  * The pairing loop of pairPredictions (predictions.ts): two files read side by side, a row of each
  * per step; rows with the same id pair at once, rows out of step meet in the id table.
  */
-import type { MetricKind } from './types.js';
+import type { MetricKind } from '../model/run.js';
 import { RunningStats } from '../stats/index.js';
 import { IdBatch, MEET_BASE, MEET_CAND } from './id-batch.js';
 import type { IdTable } from './id-tables.js';

@@ -2,30 +2,28 @@
  * Byte-level reader of one predictions CSV (`id,correct` or `id,loss`), one row at a time, with no
  * string, object or `await` per row: 1 MiB reads into one buffer, ids left in place as bytes.
  *
- * Why hand-written (the only hand-written parser in fitgap): the file has two columns and millions
+ * Why hand-written: the file has two columns and millions
  * of rows; a general CSV or line reader builds a string and an object per row, which measured as
- * most of a paired review's time. The rules are still the string rules of the original reader —
- * lines as Node's readline splits them (`\n`, `\r\n`, or a lone `\r`), the header after an optional
- * BOM, blank lines skipped, fields trimmed, `Number()` for values — and only lines that need
- * nothing of them take the byte path: `ID,VALUE\n` with ID printable ASCII without a comma and
- * VALUE `0`/`1` (correct) or a plain decimal (loss). Any other line (CR, BOM, quotes, spaces,
- * UTF-8, odd numbers, errors) is decoded and read by the string rules, with the same messages.
+ * most of a paired review's time. The rules are still the string rules of a line reader: lines as
+ * Node's readline splits them (`\n`, `\r\n`, or a lone `\r`), the header after an optional BOM,
+ * blank lines skipped, fields trimmed, only `0`/`1` in a 0/1 column and plain decimals within
+ * ±1e15 for a loss; and only lines that need nothing of them take the byte path: `ID,VALUE\n` with
+ * ID printable ASCII without a comma and VALUE the byte `0` or `1` (correct) or a plain decimal
+ * within ±1e15 (loss). Any other line (CR, BOM, quotes, spaces, UTF-8, odd or large numbers,
+ * errors) is decoded and read by the string rules, with the same messages.
  *
  * A row's id is exposed as `key[keyStart, keyStart + keyLen)`: the UTF-8 bytes of the id string the
  * string rules would give, so that equal bytes mean equal ids on both paths. The previous row's id
  * stays readable as `prevKey[prevStart, prevStart + prevLen)` (for the increasing-ids check).
  */
-import type { MetricKind } from './types.js';
-import { InputError, quote } from '../errors.js';
+import type { MetricKind } from '../model/run.js';
+import { InputError, quote } from '../model/errors.js';
+import { MAX_MAGNITUDE } from '../model/limits.js';
+import { parseDecimal } from '../model/settings.js';
 import { decodeDecimal, io } from './decimal.js';
 import type { ByteReader } from './byte-readers.js';
 
-export {
-  handleReader,
-  iterableReader,
-  type ByteReader,
-  type PredictionsSource,
-} from './byte-readers.js';
+export { lazyReader, streamReader, type ByteReader } from './byte-readers.js';
 
 export const CHUNK = 1 << 20;
 /** `advance()` results. */
@@ -37,26 +35,32 @@ const AGAIN = 2;
 
 const HEADER: Record<MetricKind, string> = { proportion: 'id,correct', continuous: 'id,loss' };
 
-function valueError(kind: MetricKind, file: string, line: number, raw: string): InputError {
-  const column = kind === 'proportion' ? 'correct' : 'loss';
-  return new InputError([
-    {
-      file,
-      pointer: `line ${line}`,
-      expected:
-        kind === 'proportion'
-          ? `column "${column}" must be 1 or 0`
-          : `column "${column}" must be a finite number`,
-      got: quote(raw),
-    },
-  ]);
-}
-
-/** The value rule of the string path: `Number()` of the field; 1/0 or a finite number. */
+/**
+ * The value rule of the string path: only the digits 0 and 1 in a 0/1 column (not `0x1`, `+1`,
+ * `1e0`); a plain decimal number within ±1e15 for a loss (model/settings.ts `parseDecimal`).
+ */
 function parseValue(raw: string, kind: MetricKind, file: string, line: number): number {
-  const value = raw.trim() === '' ? Number.NaN : Number(raw);
-  if (kind === 'proportion' ? value !== 0 && value !== 1 : !Number.isFinite(value))
-    throw valueError(kind, file, line, raw);
+  const column = kind === 'proportion' ? 'correct' : 'loss';
+  const text = raw.trim();
+  const value =
+    kind === 'proportion'
+      ? text === '0' || text === '1'
+        ? Number(text)
+        : Number.NaN
+      : (parseDecimal(text) ?? Number.NaN);
+  if (!Number.isFinite(value) || Math.abs(value) > MAX_MAGNITUDE) {
+    throw new InputError([
+      {
+        file,
+        pointer: `line ${line}`,
+        expected:
+          kind === 'proportion'
+            ? `column "${column}" must be 1 or 0`
+            : `column "${column}" must be a decimal number within ±1e15`,
+        got: quote(raw),
+      },
+    ]);
+  }
   return value;
 }
 
@@ -157,6 +161,16 @@ export class PredictionLines {
             },
           ]);
         }
+        if (this.rows === 0) {
+          throw new InputError([
+            {
+              file: this.file,
+              pointer: '',
+              expected: 'must have one row per example under its header',
+              got: 'no rows',
+            },
+          ]);
+        }
         return END;
       }
       const start = p;
@@ -200,9 +214,10 @@ export class PredictionLines {
   }
 
   /**
-   * Reads a plain decimal (`-?D+(.D+)?([eE][+-]?D+)?`) followed by `\n` from `p`; sets `value` and
-   * returns the index after the newline, or −1 for anything else (the line takes the string path).
-   * The value is what `Number()` gives for the same text: decimal.ts, or `Number()` itself.
+   * Reads a plain decimal (`-?D+(.D+)?([eE][+-]?D+)?`) within ±1e15 followed by `\n` from `p`; sets
+   * `value` and returns the index after the newline, or −1 for anything else (the line takes the
+   * string path, which refuses a larger number). The value is what `Number()` gives for the same
+   * text: decimal.ts, or `Number()` itself.
    */
   private number(from: number): number {
     const buf = this.buf;
@@ -274,8 +289,8 @@ export class PredictionLines {
       if (negative) value = -value;
     } else {
       value = Number(buf.toString('latin1', from, p));
-      if (!Number.isFinite(value)) return -1;
     }
+    if (!(Math.abs(value) <= MAX_MAGNITUDE)) return -1;
     this.value = value;
     return p + 1;
   }

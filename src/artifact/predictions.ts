@@ -1,8 +1,12 @@
 /**
- * Pairs two predictions CSVs (`id,correct` or `id,loss`) by id without keeping a row per example.
- * Both files are read side by side, a row of each per step (prediction-lines.ts reads the bytes):
- * rows with the same id at the same step pair at once, comparing id bytes; rows out of step wait in
- * an open-addressing table keyed on the id bytes until their partner shows up (id-tables.ts).
+ * Pairs two predictions CSVs (`id,correct` or `id,loss`) by id without keeping a row per example,
+ * and checks one such file on its own. Both files are read side by side, a row of each per step
+ * (prediction-lines.ts reads the bytes): rows with the same id at the same step pair at once,
+ * comparing id bytes; rows out of step wait in an open-addressing table keyed on the id bytes until
+ * their partner shows up (id-tables.ts).
+ *
+ * A file is read only through its `open()`, which the io layer provides (it opens and checks the
+ * file on every call); nothing here opens a path.
  *
  * A repeated id is an error, and nothing is kept to find one while it cannot be there:
  * - a file whose ids keep increasing (by bytes, or by length then bytes) has none;
@@ -11,100 +15,121 @@
  * - when neither's do, or in the two cases above, the files whose ids do not increase are read
  *   again: 64-bit hashes of every id, then the lines of the ids whose hash repeats.
  */
-import { open, type FileHandle } from 'node:fs/promises';
-import type { MetricKind } from './types.js';
-import { InputError, quote, type Issue } from '../errors.js';
-import type { PairedPredictions } from '../analysis/review.js';
-import { BASE, CAND, HashSet64, IdTable, hashId, hashed } from './id-tables.js';
+import type { Readable } from 'node:stream';
+import type { MetricKind } from '../model/run.js';
+import { InputError, quote, type Issue } from '../model/errors.js';
+import type { PairedPredictions } from '../model/review.js';
+import { BASE, CAND, HashSet64, IdOrder, IdTable, hashId, hashed } from './id-tables.js';
 import { DONE, NEED_A, Pairing, TUNING, type PairingTuning } from './pairing.js';
 import {
   NEED,
   ROW,
   PredictionLines,
-  handleReader,
-  iterableReader,
+  lazyReader,
+  streamReader,
   type ByteReader,
-  type PredictionsSource,
 } from './prediction-lines.js';
 
-export type { PredictionsSource } from './prediction-lines.js';
 export type { PairingTuning } from './pairing.js';
 
 export interface PredictionsFile {
-  /** Path to open when there is no `source`. */
-  path?: string;
   /** Name shown in messages. */
   file: string;
-  /** The file, already opened by the caller (which then decides what may be read). */
-  source?: PredictionsSource;
+  /**
+   * Opens the file afresh for one pass (the io layer applies its checks; another pass looks for
+   * duplicate ids). The stream yields bytes; read errors arrive through it as `InputError`s.
+   */
+  open: () => Promise<Readable>;
+  /**
+   * The same file for one pass as bytes read into the reader's own buffer (no buffer allocated per
+   * read), opened afresh and under the same checks on every call. Used instead of `open` when given.
+   */
+  openBytes?: () => Promise<ByteReader>;
 }
 
-/** Fresh readers of one file from its start, and its size when known. */
-interface Opened {
-  reader: () => ByteReader;
-  size: number | null;
+/** A fresh reader of the file, from its start. */
+function lines(f: PredictionsFile, kind: MetricKind): PredictionLines {
+  const reader = f.openBytes === undefined ? streamReader(f.open) : lazyReader(f.openBytes);
+  return new PredictionLines(reader, f.file, kind);
 }
 
-async function openFile(f: PredictionsFile, opened: FileHandle[]): Promise<Opened> {
-  const source = f.source;
-  if (typeof source === 'function') return { reader: () => iterableReader(source), size: null };
-  let handle: FileHandle;
-  if (source !== undefined) handle = source;
-  else {
-    if (f.path === undefined) throw new TypeError(`predictions file ${f.file}: no path or source`);
-    handle = await open(f.path, 'r');
-    opened.push(handle);
-  }
-  const size = (await handle.stat()).size;
-  return { reader: () => handleReader(handle), size };
-}
-
-/** Takes the next row, reading as needed (one `await` per MiB, not per row). */
-async function row(lines: PredictionLines): Promise<boolean> {
-  let r = lines.advance();
+/** Takes the next row, reading as needed (one `await` per chunk read, not per row). */
+async function row(reader: PredictionLines): Promise<boolean> {
+  let r = reader.advance();
   while (r === NEED) {
-    await lines.fill();
-    r = lines.advance();
+    await reader.fill();
+    r = reader.advance();
   }
   return r === ROW;
 }
 
 /** Every repeated id of one file, with the line it first appeared on (two reads). */
-async function repeatedIds(o: Opened, file: string, kind: MetricKind): Promise<Issue[]> {
+async function repeatedIds(f: PredictionsFile, kind: MetricKind): Promise<Issue[]> {
   const hashes = new HashSet64();
   const suspects = new Set<string>();
-  let lines = new PredictionLines(o.reader(), file, kind);
+  let reader = lines(f, kind);
   try {
-    while (await row(lines)) {
-      hashId(lines.key, lines.keyStart, lines.keyLen);
+    while (await row(reader)) {
+      hashId(reader.key, reader.keyStart, reader.keyLen);
       if (!hashes.add(hashed.a, hashed.b)) suspects.add(`${hashed.a},${hashed.b}`);
     }
   } finally {
-    await lines.close();
+    await reader.close();
   }
   const firstLine = new Map<string, number>();
   const issues: Issue[] = [];
   if (suspects.size === 0) return issues;
-  lines = new PredictionLines(o.reader(), file, kind);
+  reader = lines(f, kind);
   try {
-    while (await row(lines)) {
-      hashId(lines.key, lines.keyStart, lines.keyLen);
+    while (await row(reader)) {
+      hashId(reader.key, reader.keyStart, reader.keyLen);
       if (!suspects.has(`${hashed.a},${hashed.b}`)) continue;
-      const id = lines.id();
+      const id = reader.id();
       const first = firstLine.get(id);
-      if (first === undefined) firstLine.set(id, lines.line);
+      if (first === undefined) firstLine.set(id, reader.line);
       else
         issues.push({
-          file,
-          pointer: `line ${lines.line}`,
+          file: f.file,
+          pointer: `line ${reader.line}`,
           expected: `must have a unique id (also on line ${first})`,
           got: quote(id),
         });
     }
   } finally {
-    await lines.close();
+    await reader.close();
   }
   return issues;
+}
+
+/**
+ * Reads one predictions file through to check it (header, values, unique ids, at least one row).
+ * A file whose ids keep increasing is read once; any other is read again for repeated ids.
+ */
+export async function checkPredictions(source: PredictionsFile, kind: MetricKind): Promise<void> {
+  const reader = lines(source, kind);
+  const order = new IdOrder();
+  let increasing = true;
+  try {
+    while (await row(reader)) {
+      if (
+        increasing &&
+        !order.next(
+          reader.key,
+          reader.keyStart,
+          reader.keyLen,
+          reader.prevKey,
+          reader.prevStart,
+          reader.prevLen,
+        )
+      )
+        increasing = false;
+    }
+  } finally {
+    await reader.close();
+  }
+  if (increasing) return;
+  const issues = await repeatedIds(source, kind);
+  if (issues.length > 0) throw new InputError(issues);
 }
 
 /** Pairs baseline and candidate predictions by id, streaming both files. */
@@ -114,16 +139,12 @@ export async function pairPredictions(
   kind: MetricKind,
   tuning: PairingTuning = TUNING,
 ): Promise<PairedPredictions & { unmatched: { baseline: number; candidate: number } }> {
-  const opened: FileHandle[] = [];
-  let a: PredictionLines | null = null;
-  let b: PredictionLines | null = null;
+  const a = lines(baseline, kind);
+  const b = lines(candidate, kind);
   try {
-    const base = await openFile(baseline, opened);
-    const cand = await openFile(candidate, opened);
-    a = new PredictionLines(base.reader(), baseline.file, kind);
-    b = new PredictionLines(cand.reader(), candidate.file, kind);
     const table = new IdTable(kind === 'continuous');
-    const pairing = new Pairing(a, b, table, kind, tuning, [base.size, cand.size]);
+    // The files' sizes are not known here (the reader sees streams): the id table grows as it goes.
+    const pairing = new Pairing(a, b, table, kind, tuning, [null, null]);
     for (let r = pairing.run(); r !== DONE; r = pairing.run()) {
       if (r === NEED_A) await a.fill();
       else await b.fill();
@@ -139,8 +160,8 @@ export async function pairPredictions(
       (unordered === CAND && table.waitingCand > 0)
     ) {
       const issues: Issue[] = [];
-      if ((unordered & BASE) !== 0) issues.push(...(await repeatedIds(base, baseline.file, kind)));
-      if ((unordered & CAND) !== 0) issues.push(...(await repeatedIds(cand, candidate.file, kind)));
+      if ((unordered & BASE) !== 0) issues.push(...(await repeatedIds(baseline, kind)));
+      if ((unordered & CAND) !== 0) issues.push(...(await repeatedIds(candidate, kind)));
       if (issues.length > 0) throw new InputError(issues);
     }
 
@@ -162,8 +183,7 @@ export async function pairPredictions(
       unmatched,
     };
   } finally {
-    await a?.close();
-    await b?.close();
-    for (const handle of opened) await handle.close();
+    await a.close();
+    await b.close();
   }
 }

@@ -120,3 +120,6 @@ export function displayValue(value: unknown): string {
     return String(value);
   }
 }
+
+/** The escaping a renderer applies to untrusted text (markdown or terminal). */
+export type Escape = (text: string, maxChars?: number) => string;

@@ -7,4 +7,5 @@ export { renderJson } from './json.js';
 export { escapeInline, mermaidLabel, plainText, terminalText } from './escape.js';
 export { buildMarker, parseMarker, isValidCommentKey } from './marker.js';
 export type { Marker } from './marker.js';
-export type { ProvenanceFile } from './notes.js';
+export type { ProvenanceFile } from './method.js';
+export { gateReasonLines } from './gate.js';

@@ -3,7 +3,7 @@
  * the model is finite by construction; a non-finite one is a bug in the analysis and throws here
  * (naming its JSON pointer) rather than turning silently into `null`.
  */
-import type { Review } from '../analysis/types.js';
+import type { Review } from '../model/review.js';
 
 export function renderJson(review: Review): string {
   assertFinite(review, '');

@@ -6,15 +6,17 @@
  * the comment says what was dropped.
  */
 import { markdownTable } from 'markdown-table';
-import type { Review } from '../analysis/types.js';
+import type { Review } from '../model/review.js';
 import { escapeInline } from './escape.js';
 import { count } from './format.js';
+import { guardrailsTable } from './guardrails.js';
 import { buildHeadline } from './headline.js';
 import { buildMarker } from './marker.js';
 import type { Chart } from './mermaid.js';
 import { buildCharts } from './mermaid.js';
-import type { ProvenanceFile } from './notes.js';
-import { curveEvidence, methodNotes, provenanceTables } from './notes.js';
+import type { ProvenanceFile } from './method.js';
+import { curveEvidence, methodNotes, provenanceTables } from './method.js';
+import { unavailableNotes } from './notes.js';
 import type { Table } from './tables.js';
 import {
   MAX_HYPERPARAMETER_ROWS,
@@ -24,9 +26,8 @@ import {
   sliceCounts,
   slicesTable,
   splitsTable,
-  unavailableNotes,
 } from './tables.js';
-import { CAUTION } from './words.js';
+import { CAUTION, levelPercent } from './words.js';
 
 export interface MarkdownOptions {
   /** Key of the hidden marker, so several fitgap reports can live on one PR. @default 'default' */
@@ -106,7 +107,8 @@ export function renderMarkdown(review: Review, options: MarkdownOptions = {}): s
 }
 
 function table(t: Table): string {
-  return markdownTable([t.header, ...t.rows], { align: t.align, alignDelimiters: false });
+  const body = markdownTable([t.header, ...t.rows], { align: t.align, alignDelimiters: false });
+  return t.units === undefined || t.units === null ? body : `${t.units}\n\n${body}`;
 }
 
 function details(summary: string, body: string[]): string[] {
@@ -131,8 +133,10 @@ interface Parts {
 
 function compose(review: Review, { marker, files, charts }: Parts, d: Detail): string {
   const out: string[] = [marker, ...headlineBlock(review)];
-  out.push('### Splits', '', table(splitsTable(review)), '');
-  out.push('### Error decomposition', '', table(decompositionTable(review)), '');
+  const guards = guardrailsTable(review, escapeInline, levelPercent(review));
+  if (guards !== null) out.push('### Guardrails and cost', '', table(guards), '');
+  out.push('### Splits', '', table(splitsTable(review, escapeInline)), '');
+  out.push('### Error decomposition', '', table(decompositionTable(review, escapeInline)), '');
   const missing = unavailableNotes(review, escapeInline);
   if (missing.length > 0) out.push(...missing.map((m) => `- ${m}`), '');
   if (review.levers.length > 0) {
@@ -165,7 +169,7 @@ function compose(review: Review, { marker, files, charts }: Parts, d: Detail): s
     );
   }
   if (d.rest) {
-    const evidence = curveEvidence(review, escapeInline);
+    const evidence = curveEvidence(review);
     if (evidence.length > 0)
       out.push(
         ...details(

@@ -3,11 +3,11 @@
  * regularization curves (`xychart-beta` line charts, baseline against candidate). Pure functions of
  * the review. Artifact text reaches a chart only through `mermaidLabel`; numbers are fixed-decimal.
  */
-import type { Review, RunSummary } from '../analysis/types.js';
-import type { CurveSkipped, CurvesReport } from '../analysis/curves/types.js';
-import type { CurveName } from '../artifact/types.js';
+import type { Review, RunSummary } from '../model/review.js';
+import type { CurveSkipped, CurvesReport } from '../model/curves.js';
+import type { CurveName } from '../model/run.js';
 import { escapeInline, mermaidLabel } from './escape.js';
-import { chartNumber, num, numberFormatFor, short } from './format.js';
+import { chartNumber, difference, numberFormatFor, short } from './format.js';
 
 export interface Chart {
   kind: 'plane' | CurveName;
@@ -80,11 +80,11 @@ export function planeChart(review: Review): Chart | null {
   ];
   const metric = escapeInline(review.metric.name, 40);
   const values = points
-    .map(([run, b, v]) => `${run} bias ${num(b, format)}, variance ${num(v, format)}`)
+    .map(([run, b, v]) => `${run} bias ${difference(b, format)}, variance ${difference(v, format)}`)
     .join('; ');
   const caption =
     `**Bias/variance plane** (${metric}, shortfall units). Each axis is scaled so that its middle ` +
-    `line is the presence threshold, ${num(t, format)} (gap tolerance ${short(review.settings.gapTolerance)} × ` +
+    `line is the presence threshold, ${difference(t, format)} (gap tolerance ${short(review.settings.gapTolerance)} × ` +
     `the mean validation error level); right of it avoidable bias is large enough to count, above it ` +
     `variance. Values: ${values}.`;
   return { kind: 'plane', caption, code: lines.join('\n') };
@@ -174,7 +174,7 @@ function lineChart(
   curve: CurveName,
   series: Series[],
   [lo, hi]: [number, number],
-  [yMin, yMax]: [number, number],
+  yRange: [number, number],
   only: RunKey | null,
 ): Chart {
   const text = CURVE_TEXT[curve];
@@ -184,6 +184,10 @@ function lineChart(
   ].sort((a, b) => a - b);
   const geometric = curve !== 'epochs' && lo > 0 && hi / lo >= 10;
   const grid = geometric ? thin(xs, MAX_POINTS) : evenGrid(lo, hi, Math.min(MAX_POINTS, xs.length));
+  // A proportion is drawn in percent, as the tables write it.
+  const percent = review.metric.kind === 'proportion';
+  const yScale = percent ? 100 : 1;
+  const [yMin, yMax] = [yRange[0] * yScale, yRange[1] * yScale];
   const yPad = (yMax - yMin) * 0.05 || Math.abs(yMax) * 0.05 || 1;
   const y0 = yMin - yPad;
   const y1 = yMax + yPad;
@@ -193,7 +197,7 @@ function lineChart(
       ? 0
       : Math.min(6, Math.max(0, 2 - Math.floor(Math.log10(Math.max(hi - lo, 1e-9)))));
   const metric = mermaidLabel(review.metric.name, 40) || 'metric';
-  const unit = review.metric.kind === 'proportion' ? 'proportion' : 'metric units';
+  const unit = percent ? '%' : 'metric units';
   const title = only === null ? text.title : `${text.title}, ${only}`;
   const palette = ordered.map((s) => PALETTE[paletteKey(s)][0]).join(', ');
   const lines = [
@@ -206,7 +210,7 @@ function lineChart(
     `  y-axis "${metric} (${unit})" ${chartNumber(y0, yDecimals)} --> ${chartNumber(y1, yDecimals)}`,
     ...ordered.map(
       (s) =>
-        `  line [${grid.map((x) => chartNumber(interpolate(s.points, x, geometric), yDecimals + 1)).join(', ')}]`,
+        `  line [${grid.map((x) => chartNumber(yScale * interpolate(s.points, x, geometric), yDecimals + 1)).join(', ')}]`,
     ),
   ];
   const legend = ordered.map((s) => `${PALETTE[paletteKey(s)][1]} = ${s.run} ${s.part}`).join(', ');

@@ -1,156 +1,96 @@
 /**
- * The prose parts of a review as lists of lines: method notes, curve evidence and provenance.
- * Artifact text goes through the renderer's `esc`.
+ * The sentences of the notes: the review's notes, its non-levers, the runs' warnings, and why a
+ * component could not be computed. Artifact strings (slice and file names) go through `esc`.
  */
-import type { Delta, Review, RunSummary } from '../analysis/types.js';
-import type { CurveSkipped } from '../analysis/curves/types.js';
-import type { CurveName } from '../artifact/types.js';
-import type { TestName } from '../stats/types.js';
-import type { Escape, Table } from './tables.js';
-import { count, num, numberFormatFor, short } from './format.js';
-import { SPLIT_WORD, TEST_WHY, levelPercent } from './words.js';
+import type { Note, NonLever, Review, RunWarning, UnavailableCode } from '../model/review.js';
+import type { Escape } from './escape.js';
+import { amount, count, type NumberFormat } from './format.js';
+import { COMPONENT_ORDER, COMPONENT_TITLE, SPLIT_WORD, say, type Words } from './words.js';
 
-export interface ProvenanceFile {
-  label: string;
-  path: string;
-  sha256: string;
+/** Names listed in a note, and "…" when there were more. */
+function names(list: readonly string[], total: number, esc: Escape): string {
+  return `${list.map((n) => esc(n, 60)).join(', ')}${total > list.length ? ', …' : ''}`;
 }
 
-export function methodNotes(review: Review, esc: Escape): string[] {
-  const s = review.settings;
-  const lines: string[] = [
-    `alpha = ${short(s.alpha)}: a change counts as up or down only when it is significant at this level and at least min-effect in size; intervals are ${levelPercent(review)}%.`,
-    `min-effect = ${short(s.minEffect)} (${review.metric.kind === 'proportion' ? 'proportion' : 'metric units'}): smaller changes are called flat however significant.`,
-    `gap tolerance = ${short(s.gapTolerance)}: a component is present when it is at least this share of the run's validation error level (and at least min-effect, and significantly above 0 where its noise is known).`,
-    `fail-on = ${s.failOn.length === 0 ? '(empty: the gate always passes)' : s.failOn.map((p) => esc(p, 60)).join(', ')}.`,
+function slices(n: number): string {
+  return `${count(n)} ${n === 1 ? 'slice' : 'slices'}`;
+}
+
+export function noteSentence(note: Note, review: Review, f: NumberFormat, esc: Escape): string {
+  switch (note.code) {
+    case 'train-dev-in-one-run':
+      return 'Only one run has a train-dev split: the variance change is measured as validation − train in both.';
+    case 'unpaired-slices':
+      return `${slices(note.count)} appear in one run only and were not compared: ${names(note.names, note.count, esc)}.`;
+    case 'hidden-regressions':
+      return `Validation improved overall, yet ${slices(note.count)} regressed significantly (Holm-adjusted): ${names(note.names, note.count, esc)}.`;
+    case 'noise-unknown':
+      return review.settings.minEffect > 0
+        ? `Run-to-run noise is unknown (one repeat of a continuous metric, no per-example predictions): changes are called on size alone (min-effect ${amount(review.settings.minEffect, f)}).`
+        : 'Run-to-run noise is unknown (one repeat of a continuous metric, no per-example predictions) and min-effect is 0: no change can be called. Add repeats (seeds), per-example predictions, or set min-effect.';
+    case 'bias-unknown':
+      return 'Avoidable bias is unknown: there is no reference level for this metric. Its change is still measured from the training error; the diagnosis rests on variance and data mismatch.';
+    case 'predictions-share-no-id':
+      return 'The two predictions files share no id: the paired test was not used.';
+    case 'predictions-in-one-run':
+      return 'Only one run ships per-example predictions: no paired test.';
+    case 'predictions-split-mismatch':
+      return `The predictions are for different splits (${say(SPLIT_WORD, note.baseline, esc)} in the baseline, ${say(SPLIT_WORD, note.candidate, esc)} in the candidate): no paired test.`;
+    case 'predictions-unmatched':
+      return `Predictions paired by id: ${count(note.rows)} rows in both; ${count(note.baseline)} baseline and ${count(note.candidate)} candidate rows had no partner and were left out of the paired test.`;
+    case 'epoch-log-not-used':
+      return `${esc(note.file, 120)}: the artifact has its own epoch curve; the epoch log ${esc(note.log, 120)} was not used.`;
+    case 'epoch-log-missing':
+      return `No epoch log ${esc(note.log, 120)} next to ${esc(note.file, 120)}; the config's epoch-log mapping was not applied to it.`;
+    default:
+      return esc(String((note as { code: unknown }).code), 60);
+  }
+}
+
+const NON_LEVER: Words<NonLever> = new Map([
+  [
+    'smaller-training-set',
+    'A smaller training set is not a cure for high bias: it only lowers the training error, while validation error stays high or rises.',
+  ],
+]);
+
+const WARNING: Words<RunWarning> = new Map([
+  [
+    'validation-overfit',
+    'test error is well above validation error: model choices may be tuned to the validation set.',
+  ],
+]);
+
+/** The review's notes, the runs' warnings and the non-levers, one sentence each. */
+export function reviewNotes(review: Review, f: NumberFormat, esc: Escape): string[] {
+  return [
+    ...(['baseline', 'candidate'] as const).flatMap((run) =>
+      review[run].warnings.map((w) => `${run}: ${say(WARNING, w, esc)}`),
+    ),
+    ...review.notes.map((n) => noteSentence(n, review, f, esc)),
+    ...review.nonLevers.map((n) => say(NON_LEVER, n, esc)),
   ];
-  const uses = new Map<TestName, string[]>();
-  const use = (what: string, delta: Delta | null): void => {
-    if (delta === null) return;
-    uses.set(delta.test, [...(uses.get(delta.test) ?? []), what]);
-  };
-  use('validation change', review.validation.delta);
-  use('avoidable bias', review.bias.delta);
-  use('variance', review.variance.delta);
-  use('data mismatch', review.mismatch.delta);
-  use('validation overfit', review.overfit.delta);
-  for (const split of review.splits) use(`${SPLIT_WORD[split.split]} split`, split.delta);
-  if (review.slices.length > 0) {
-    const tests = [...new Set(review.slices.map((x) => x.delta.test))];
-    for (const t of tests) uses.set(t, [...(uses.get(t) ?? []), 'slices']);
-  }
-  for (const [test, what] of uses) {
-    lines.push(`${[...new Set(what)].join(', ')}: ${TEST_WHY[test]}`);
-  }
-  if (review.slices.length > 0) {
-    lines.push(
-      `Slice p-values are adjusted with the Holm–Bonferroni method over all ${count(review.slices.length)} slices, so a few bad slices among many are not flagged by chance.`,
-    );
-  }
-  if (review.paired !== null) {
-    const d = review.paired.discordant;
-    lines.push(
-      `Paired predictions: ${count(review.paired.rows)} examples scored by both runs${
-        d === undefined
-          ? ''
-          : `; ${count(d.baselineOnly)} right only in the baseline, ${count(d.candidateOnly)} right only in the candidate`
-      }.`,
-    );
-  }
+}
+
+const UNAVAILABLE: Words<UnavailableCode> = new Map([
+  [
+    'no-reference',
+    'no reference level: give `reference` in the artifact or the config (human-level error, a prior system, or an estimated Bayes error).',
+  ],
+  ['no-train-dev', 'needs a train-dev split (held-out data from the training distribution).'],
+  ['no-test', 'needs a test split.'],
+]);
+
+/** Why components could not be computed, one line each, deduplicated. */
+export function unavailableNotes(review: Review, esc: Escape): string[] {
+  const seen = new Set<string>();
   for (const run of ['baseline', 'candidate'] as const) {
-    const r = review[run];
-    lines.push(referenceLine(run, r, review));
-    for (const w of r.warnings) lines.push(`${run}: ${esc(w, 300)}`);
-  }
-  for (const n of review.notes) lines.push(esc(n, 300));
-  for (const n of review.nonLevers) lines.push(esc(n, 300));
-  return lines;
-}
-
-function referenceLine(run: string, r: RunSummary, review: Review): string {
-  const f = numberFormatFor(review);
-  if (r.reference === null) {
-    return `${run}: no reference level, so avoidable bias is unknown; set \`reference\` in the artifact or the config.`;
-  }
-  const source = {
-    artifact: 'from the artifact',
-    config: 'from the config',
-    default: 'the default for a minimized proportion',
-    unknown: 'source unknown',
-  }[r.referenceSource];
-  return `${run}: reference level ${num(r.reference, f)} (${source}).`;
-}
-
-const CURVE_WORD: Record<CurveName, string> = {
-  epochs: 'Epoch curve',
-  training_examples: 'Learning curve',
-  regularization: 'Regularization curve',
-};
-
-function skipped(e: object): e is CurveSkipped {
-  return 'skipped' in e;
-}
-
-export function curveEvidence(review: Review, esc: Escape): string[] {
-  const f = numberFormatFor(review);
-  const lines: string[] = [];
-  for (const run of ['baseline', 'candidate'] as const) {
-    const curves = review[run].curves;
-    const e = curves.epochs;
-    if (e !== undefined) {
-      lines.push(
-        skipped(e)
-          ? `${run}, ${CURVE_WORD.epochs}: not analysed (${esc(e.skipped, 200)}).`
-          : `${run}, ${CURVE_WORD.epochs}: lowest validation ${num(e.bestValidation, f)} at epoch ${short(e.bestX)}; final ${num(e.finalValidation, f)} at epoch ${short(e.finalX)}; ${e.gl === null ? 'generalization loss undefined (best validation is 0)' : `generalization loss ${e.gl.toFixed(1)}%`}${e.pq === null ? '' : `, progress quotient ${e.pq.toFixed(2)}`}${e.stoppedLate ? '; trained past the minimum' : ''}${e.stoppedEarly ? '; still improving at the end' : ''}.`,
-      );
-    }
-    const l = curves.training_examples;
-    if (l !== undefined) {
-      const lp = skipped(l)
-        ? ''
-        : l.projections
-            .map(
-              (p) =>
-                `${short(p.x)} examples → ${num(p.validation, f)} [${num(p.ci[0], f)}, ${num(p.ci[1], f)}]`,
-            )
-            .join('; ');
-      lines.push(
-        skipped(l)
-          ? `${run}, ${CURVE_WORD.training_examples}: not analysed (${esc(l.skipped, 200)}).`
-          : `${run}, ${CURVE_WORD.training_examples}: power-law fit R² ${l.r2.toFixed(3)}, residual sd ${num(l.residual, f)}; projected validation: ${lp || 'none'}; train/validation gap ${l.gapTrend}.`,
-      );
-    }
-    const g = curves.regularization;
-    if (g !== undefined) {
-      lines.push(
-        skipped(g)
-          ? `${run}, ${CURVE_WORD.regularization}: not analysed (${esc(g.skipped, 200)}).`
-          : `${run}, ${CURVE_WORD.regularization}: lowest validation ${num(g.bestValidation, f)} at strength ${short(g.bestX)}; the run's own strength is ${g.side === 'at' ? 'at' : g.side === 'unknown' ? 'at an unknown place relative to' : g.side} the best; suggested ${short(g.suggestedX)}${g.atEdge === null ? '' : `; the minimum is at the ${g.atEdge} end of the sweep, so extend it`}.`,
-      );
+    for (const name of COMPONENT_ORDER) {
+      const c = review[run].components[name];
+      if (c.value === null && c.unavailable !== undefined) {
+        seen.add(`${say(COMPONENT_TITLE, name, esc)}: ${say(UNAVAILABLE, c.unavailable, esc)}`);
+      }
     }
   }
-  return lines;
-}
-
-export function provenanceTables(review: Review, esc: Escape, files: ProvenanceFile[]): Table[] {
-  const runs: Table = {
-    header: ['Run', 'Name', 'Commit', 'Created'],
-    align: ['l', 'l', 'l', 'l'],
-    rows: (['baseline', 'candidate'] as const).map((run) => {
-      const r = review[run];
-      return [
-        run,
-        esc(r.name),
-        r.commit === null ? 'n/a' : esc(r.commit, 64),
-        r.createdAt === null ? 'n/a' : esc(r.createdAt, 40),
-      ];
-    }),
-  };
-  if (files.length === 0) return [runs];
-  const fileTable: Table = {
-    header: ['File', 'Path', 'sha256'],
-    align: ['l', 'l', 'l'],
-    rows: files.map((file) => [esc(file.label, 40), esc(file.path, 120), esc(file.sha256, 64)]),
-  };
-  return [runs, fileTable];
+  return [...seen];
 }

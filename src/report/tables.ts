@@ -1,32 +1,42 @@
 /**
- * The review's tables as data (header + rows of strings), shared by the markdown and text renderers.
- * Artifact text goes through the `esc` function the renderer passes in (markdown or terminal
- * escaping); our own words and numbers need none.
+ * The review's tables as data (header + rows of strings), shared by the markdown and text
+ * renderers. Artifact text goes through the `esc` function the renderer passes in (markdown or
+ * terminal escaping); codes are looked up in word tables.
  */
-import type { Review, SliceChange } from '../analysis/types.js';
-import { displayValue } from './escape.js';
-import { count, interval, num, numberFormatFor, pValue, signed } from './format.js';
+import type { ComponentName, Review, SliceChange } from '../model/review.js';
+import { displayValue, type Escape } from './escape.js';
+import {
+  changeCell,
+  count,
+  intervalCell,
+  numberFormatFor,
+  pCell,
+  unitLine,
+  valueCell,
+} from './format.js';
+import { leverText } from './levers.js';
 import {
   COMPONENT_ORDER,
-  COMPONENT_WORD,
+  COMPONENT_TITLE,
   DIAGNOSIS_WORD,
-  LEVER_TITLE,
   SPLIT_WORD,
   componentReading,
   levelPercent,
   reading,
+  say,
 } from './words.js';
 
-export type Escape = (text: string, maxChars?: number) => string;
 export type Align = 'l' | 'r' | 'c';
 
 export interface Table {
   header: string[];
   align: Align[];
   rows: string[][];
+  /** The units of the cells, said once above the table (null: the metric's own units). */
+  units?: string | null;
 }
 
-export function splitsTable(review: Review): Table {
+export function splitsTable(review: Review, esc: Escape): Table {
   const f = numberFormatFor(review);
   return {
     header: [
@@ -39,28 +49,30 @@ export function splitsTable(review: Review): Table {
       'Reading',
     ],
     align: ['l', 'r', 'r', 'r', 'r', 'r', 'l'],
+    units: unitLine(f, 'values'),
     rows: review.splits.map((s) => [
-      SPLIT_WORD[s.split],
-      num(s.baseline, f),
-      num(s.candidate, f),
-      signed(s.delta.estimate, f),
-      interval(s.delta.ci, f),
-      pValue(s.delta.p).replace(/^p /, '').replace(/^= /, ''),
+      say(SPLIT_WORD, s.split, esc),
+      valueCell(s.baseline, f),
+      valueCell(s.candidate, f),
+      changeCell(s.delta.estimate, f),
+      intervalCell(s.delta.ci, f),
+      pCell(s.delta.p),
       reading(s.delta.call, review),
     ]),
   };
 }
 
 /**
- * Components of both runs with the change. `compact` (for 80 columns): present components are marked
- * `*`, the p column is left out and the call is one word.
+ * Components of both runs with the change (shortfall units: up is worse). `compact` (for 80
+ * columns): present components are marked `*`, the p column is left out, the call is one word and
+ * the diagnosis is left to a sentence (`diagnosisLine`).
  */
-export function decompositionTable(review: Review, compact = false): Table {
+export function decompositionTable(review: Review, esc: Escape, compact = false): Table {
   const f = numberFormatFor(review);
-  const cell = (run: 'baseline' | 'candidate', name: (typeof COMPONENT_ORDER)[number]): string => {
+  const cell = (run: 'baseline' | 'candidate', name: ComponentName): string => {
     const c = review[run].components[name];
     if (c.value === null) return 'n/a';
-    return `${num(c.value, f)}${c.present ? (compact ? '*' : ' (present)') : ''}`;
+    return `${valueCell(c.value, f)}${c.present ? (compact ? '*' : ' (present)') : ''}`;
   };
   const deltas = {
     bias: review.bias.delta,
@@ -70,74 +82,53 @@ export function decompositionTable(review: Review, compact = false): Table {
   };
   const rows = COMPONENT_ORDER.map((name) => {
     const d = deltas[name];
+    const row = [say(COMPONENT_TITLE, name, esc), cell('baseline', name), cell('candidate', name)];
+    if (d === null) return [...row, 'n/a', 'n/a', ...(compact ? [] : ['n/a']), 'n/a'];
     return [
-      COMPONENT_WORD[name],
-      cell('baseline', name),
-      cell('candidate', name),
-      d === null ? 'n/a' : signed(d.estimate, f),
-      d === null ? 'n/a' : interval(d.ci, f),
-      d === null ? 'n/a' : pValue(d.p).replace(/^p /, '').replace(/^= /, ''),
-      d === null ? 'n/a' : componentReading(d.call),
+      ...row,
+      changeCell(d.estimate, f),
+      intervalCell(d.ci, f),
+      ...(compact ? [] : [pCell(d.p)]),
+      componentReading(d.call, compact),
     ];
   });
+  // Components are differences of error levels: in points for a proportion, like changes.
+  const units = unitLine(f, 'differences');
+  const header = ['Component', 'Baseline', 'Candidate', 'Δ', `${levelPercent(review)}% interval`];
+  if (compact) {
+    return { header: [...header, 'Call'], align: ['l', 'r', 'r', 'r', 'r', 'l'], rows, units };
+  }
   rows.push([
     'Diagnosis',
-    DIAGNOSIS_WORD[review.baseline.diagnosis],
-    DIAGNOSIS_WORD[review.candidate.diagnosis],
+    say(DIAGNOSIS_WORD, review.baseline.diagnosis, esc),
+    say(DIAGNOSIS_WORD, review.candidate.diagnosis, esc),
     '',
     '',
     '',
     '',
   ]);
-  const table: Table = {
-    header: [
-      'Component',
-      'Baseline',
-      'Candidate',
-      'Δ',
-      `${levelPercent(review)}% interval`,
-      'p',
-      'Call',
-    ],
+  return {
+    header: [...header, 'p', 'Call'],
     align: ['l', 'r', 'r', 'r', 'r', 'r', 'l'],
     rows,
-  };
-  if (!compact) return table;
-  const shorter = (row: string[]): string[] => [
-    ...row.slice(0, 5),
-    (row[6] ?? '').replace(/^(up|down) \((\w+)\)$/, '$2'),
-  ];
-  return {
-    header: shorter(table.header),
-    align: ['l', 'r', 'r', 'r', 'r', 'l'],
-    rows: table.rows.map(shorter),
+    units,
   };
 }
 
-/** Reasons why components could not be computed, one line each, deduplicated. */
-export function unavailableNotes(review: Review, esc: Escape): string[] {
-  const seen = new Set<string>();
-  for (const run of ['baseline', 'candidate'] as const) {
-    for (const name of COMPONENT_ORDER) {
-      const c = review[run].components[name];
-      if (c.value === null && c.unavailable !== undefined) {
-        seen.add(`${COMPONENT_WORD[name]}: ${esc(c.unavailable, 300)}`);
-      }
-    }
-  }
-  return [...seen];
+/** The diagnosis of both runs in one sentence. */
+export function diagnosisLine(review: Review, esc: Escape): string {
+  return `Diagnosis: baseline ${say(DIAGNOSIS_WORD, review.baseline.diagnosis, esc)}; candidate ${say(DIAGNOSIS_WORD, review.candidate.diagnosis, esc)}.`;
 }
 
 export function leversTable(review: Review, esc: Escape): Table {
+  const f = numberFormatFor(review);
   return {
-    header: ['#', 'Lever', 'Why', 'Evidence'],
-    align: ['r', 'l', 'l', 'l'],
-    rows: review.levers.map((lever, i) => [
-      String(i + 1),
-      LEVER_TITLE[lever.id],
-      esc(lever.reason, 300),
-      lever.evidence.map((e) => esc(e, 200)).join(' · ') || '—',
-    ]),
+    header: ['#', 'Lever', 'Why'],
+    align: ['r', 'l', 'l'],
+    rows: review.levers.map((lever, i) => {
+      const text = leverText(lever, review, f, esc);
+      return [String(i + 1), text.title, text.sentences.join(' ') || '—'];
+    }),
   };
 }
 
@@ -158,6 +149,12 @@ export function sortSlices(review: Review): SliceChange[] {
   );
 }
 
+const SLICE_CHANGE = new Map([
+  ['worse', 'worse'],
+  ['better', 'better'],
+  ['flat', 'flat'],
+]);
+
 export function slicesTable(review: Review, esc: Escape, limit: number): Table {
   const f = numberFormatFor(review);
   const rows = sortSlices(review)
@@ -165,16 +162,17 @@ export function slicesTable(review: Review, esc: Escape, limit: number): Table {
     .map((s) => [
       esc(s.name),
       s.examples === null ? 'n/a' : count(s.examples),
-      num(s.baseline, f),
-      num(s.candidate, f),
-      signed(s.delta.estimate, f),
-      s.pAdjusted === null ? 'n/a' : pValue(s.pAdjusted).replace(/^p /, '').replace(/^= /, ''),
-      s.hiddenRegression ? 'worse (hidden)' : s.change,
+      valueCell(s.baseline, f),
+      valueCell(s.candidate, f),
+      changeCell(s.delta.estimate, f),
+      pCell(s.pAdjusted),
+      s.hiddenRegression ? 'worse (hidden)' : (SLICE_CHANGE.get(s.change) ?? esc(s.change, 20)),
     ]);
   return {
     header: ['Slice', 'Examples', 'Baseline', 'Candidate', 'Δ', 'p (Holm)', 'Change'],
     align: ['l', 'r', 'r', 'r', 'r', 'r', 'l'],
     rows,
+    units: unitLine(f, 'values'),
   };
 }
 
@@ -185,11 +183,23 @@ export function sliceCounts(slices: SliceChange[]): {
   flat: number;
 } {
   const out = { worse: 0, better: 0, flat: 0 };
-  for (const s of slices) out[s.change] += 1;
+  for (const s of slices) {
+    if (s.change === 'worse') out.worse += 1;
+    else if (s.change === 'better') out.better += 1;
+    else out.flat += 1;
+  }
   return out;
 }
 
 export const MAX_HYPERPARAMETER_ROWS = 50;
+
+const HYPERPARAMETER_CHANGE = new Map([
+  ['raised', 'raised'],
+  ['lowered', 'lowered'],
+  ['changed', 'changed'],
+  ['added', 'added'],
+  ['removed', 'removed'],
+]);
 
 export function hyperparameterTable(review: Review, esc: Escape): Table {
   return {
@@ -201,7 +211,7 @@ export function hyperparameterTable(review: Review, esc: Escape): Table {
         esc(h.key),
         h.kind === 'added' ? '(absent)' : esc(displayValue(h.baseline), 60),
         h.kind === 'removed' ? '(absent)' : esc(displayValue(h.candidate), 60),
-        h.kind,
+        HYPERPARAMETER_CHANGE.get(h.kind) ?? esc(h.kind, 20),
       ]),
   };
 }

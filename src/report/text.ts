@@ -4,22 +4,26 @@
  * `terminalText`, which removes ESC and every other control character, so an artifact cannot send
  * terminal escape sequences. Widths count code points (wide East Asian characters count as one).
  */
-import type { Review } from '../analysis/types.js';
+import type { Review } from '../model/review.js';
 import { terminalText, truncate } from './escape.js';
 import { count } from './format.js';
+import { guardrailsTable } from './guardrails.js';
 import { buildHeadline } from './headline.js';
 import type { Tone } from './headline.js';
-import { curveEvidence, methodNotes } from './notes.js';
+import { numberFormatFor } from './format.js';
+import { leverText } from './levers.js';
+import { curveEvidence, methodNotes } from './method.js';
+import { unavailableNotes } from './notes.js';
 import type { Table } from './tables.js';
 import {
   decompositionTable,
+  diagnosisLine,
   hyperparameterTable,
   sliceCounts,
   slicesTable,
   splitsTable,
-  unavailableNotes,
 } from './tables.js';
-import { CAUTION, LEVER_TITLE } from './words.js';
+import { CAUTION, levelPercent } from './words.js';
 
 export interface TextOptions {
   /** ANSI colour (bold headings, green/red for good/bad). */
@@ -62,32 +66,29 @@ export function renderText(review: Review, options: TextOptions): string {
     }
     out.push(...rest);
   }
+  const guards = guardrailsTable(review, esc, levelPercent(review), true);
+  if (guards !== null) out.push('', heading('Guardrails and cost'), ...textTable(guards, width));
   // When the splits table is too wide, drop its Reading column (the sign of Δ and the headline
   // carry it) rather than cut the split names.
-  const splits = splitsTable(review);
+  const splits = splitsTable(review, esc);
   const fitted = naturalWidth(splits) > width ? withoutColumn(splits, 'Reading') : splits;
   out.push('', heading('Splits'), ...textTable(fitted, width), '');
-  const decomposition = decompositionTable(review, true);
-  const diagnosis = decomposition.rows.pop();
-  out.push(heading('Error decomposition'), ...textTable(decomposition, width));
-  const notes = [
-    '* present: large enough to count.',
-    diagnosis === undefined
-      ? ''
-      : `Diagnosis: baseline ${diagnosis[1]}; candidate ${diagnosis[2]}.`,
-  ];
-  for (const n of notes.filter((x) => x !== '')) out.push(...wrap(n, width, '    ', '  '));
+  out.push(
+    heading('Error decomposition'),
+    ...textTable(decompositionTable(review, esc, true), width),
+  );
+  for (const n of ['* present: large enough to count.', diagnosisLine(review, esc)])
+    out.push(...wrap(n, width, '    ', '  '));
   for (const m of unavailableNotes(review, esc)) out.push(...wrap(m, width, '    ', '  - '));
   out.push('');
   if (review.levers.length > 0) {
     out.push(heading('Next levers'));
+    const f = numberFormatFor(review);
     review.levers.forEach((lever, i) => {
       const n = `${i + 1}. `;
       const pad = ' '.repeat(n.length + 2);
-      out.push(
-        ...wrap(`${LEVER_TITLE[lever.id]}: ${esc(lever.reason, 300)}`, width, pad, `  ${n}`),
-      );
-      for (const e of lever.evidence) out.push(...wrap(esc(e, 200), width, `${pad}  `, `${pad}- `));
+      const text = leverText(lever, review, f, esc);
+      out.push(...wrap(`${text.title}: ${text.sentences.join(' ')}`, width, pad, `  ${n}`));
     });
     out.push('');
   }
@@ -111,7 +112,7 @@ export function renderText(review: Review, options: TextOptions): string {
     );
     out.push('');
   }
-  const evidence = curveEvidence(review, esc);
+  const evidence = curveEvidence(review);
   if (evidence.length > 0) {
     out.push(heading('Curve evidence'));
     for (const e of evidence) out.push(...wrap(e, width, '    ', '  - '));
@@ -144,7 +145,7 @@ function withoutColumn(t: Table, header: string): Table {
   const c = t.header.indexOf(header);
   if (c < 0) return t;
   const drop = <T>(row: readonly T[]): T[] => row.filter((_, i) => i !== c);
-  return { header: drop(t.header), align: drop(t.align), rows: t.rows.map(drop) };
+  return { ...t, header: drop(t.header), align: drop(t.align), rows: t.rows.map(drop) };
 }
 
 /** Word-wraps to `width` columns; the first line starts with `first`, the others with `indent`. */
@@ -200,7 +201,8 @@ export function textTable(t: Table, width: number): string[] {
     widths.map((_, c) => c),
     2,
   );
-  return rows.map((r) => {
+  const units = t.units === undefined || t.units === null ? [] : wrap(t.units, width, '  ');
+  const lines = rows.map((r) => {
     const cells = widths.map((w, c) => {
       const cell = truncate(r[c] ?? '', w);
       const pad = ' '.repeat(Math.max(0, w - len(cell)));
@@ -208,4 +210,5 @@ export function textTable(t: Table, width: number): string[] {
     });
     return `  ${cells.join('  ')}`.trimEnd();
   });
+  return [...units, ...lines];
 }

@@ -1,17 +1,35 @@
-/** The plain words the reports use for the review model's codes. Our own wording. */
+/**
+ * The words the reports use for the review model's codes. Our own wording. Tables are Maps, so a
+ * code read from an untrusted report can only find an entry the table really has; a code with no
+ * entry is shown escaped, as the text it is.
+ */
 import type {
   Call,
   ComponentName,
   Diagnosis,
   LeverId,
   Movement,
+  ReferenceSource,
   Review,
   ValidationChange,
-} from '../analysis/types.js';
-import type { SplitName } from '../artifact/types.js';
+} from '../model/review.js';
+import type { SplitName } from '../model/run.js';
 import type { TestName } from '../stats/types.js';
+import type { Escape } from './escape.js';
 
-export const MOVEMENT_TITLE: Record<Movement, string> = {
+/** A table of words for codes. */
+export type Words<K extends string> = ReadonlyMap<K, string>;
+
+function words<K extends string>(entries: Record<K, string>): Words<K> {
+  return new Map(Object.entries(entries) as [K, string][]);
+}
+
+/** The word for `code`, or the code itself, escaped, when the table has none. */
+export function say<K extends string>(table: Words<K>, code: K, esc: Escape): string {
+  return table.get(code) ?? esc(String(code), 60);
+}
+
+export const MOVEMENT_TITLE = words<Movement>({
   'better-on-both': 'less bias and less variance',
   'away-from-underfitting': 'away from underfitting',
   'toward-overfitting': 'toward overfitting',
@@ -19,9 +37,9 @@ export const MOVEMENT_TITLE: Record<Movement, string> = {
   'no-significant-change': 'no change beyond noise',
   'toward-underfitting': 'toward underfitting',
   'worse-on-both': 'more bias and more variance',
-};
+});
 
-export const MOVEMENT_SENTENCE: Record<Movement, string> = {
+export const MOVEMENT_SENTENCE = words<Movement>({
   'better-on-both': 'The change lowered both avoidable bias and variance',
   'away-from-underfitting': 'The change moved the model away from underfitting',
   'toward-overfitting': 'The change moved the model toward overfitting',
@@ -30,28 +48,37 @@ export const MOVEMENT_SENTENCE: Record<Movement, string> = {
     'The change did not move avoidable bias or variance beyond run-to-run noise',
   'toward-underfitting': 'The change moved the model toward underfitting',
   'worse-on-both': 'The change raised both avoidable bias and variance',
-};
+});
 
-export const VALIDATION_WORD: Record<ValidationChange, string> = {
+export const VALIDATION_WORD = words<ValidationChange>({
   better: 'better',
   worse: 'worse',
   flat: 'unchanged within noise',
-};
+});
 
-export const DIAGNOSIS_WORD: Record<Diagnosis, string> = {
+export const DIAGNOSIS_WORD = words<Diagnosis>({
   'good-fit': 'good fit',
   'high-bias': 'high bias (underfitting)',
   'high-variance': 'high variance (overfitting)',
   'data-mismatch': 'data mismatch',
   'high-bias-and-variance': 'high bias and high variance',
-};
+});
 
-export const COMPONENT_WORD: Record<ComponentName, string> = {
+/** Component names at the start of a table row or sentence. */
+export const COMPONENT_TITLE = words<ComponentName>({
   bias: 'Avoidable bias',
   variance: 'Variance',
   mismatch: 'Data mismatch',
   overfit: 'Validation overfit',
-};
+});
+
+/** Component names inside a sentence. */
+export const COMPONENT_WORD = words<ComponentName>({
+  bias: 'avoidable bias',
+  variance: 'variance',
+  mismatch: 'data mismatch',
+  overfit: 'validation overfit',
+});
 
 export const COMPONENT_ORDER: readonly ComponentName[] = [
   'bias',
@@ -60,14 +87,15 @@ export const COMPONENT_ORDER: readonly ComponentName[] = [
   'overfit',
 ];
 
-export const SPLIT_WORD: Record<SplitName, string> = {
+/** Split names in prose and tables (`train_dev` is only the artifact key). */
+export const SPLIT_WORD = words<SplitName>({
   train: 'train',
   train_dev: 'train-dev',
   validation: 'validation',
   test: 'test',
-};
+});
 
-export const LEVER_TITLE: Record<LeverId, string> = {
+export const LEVER_TITLE = words<LeverId>({
   'more-data': 'Add training data',
   'fewer-features': 'Use fewer features',
   'stronger-regularization': 'Strengthen regularization',
@@ -82,17 +110,17 @@ export const LEVER_TITLE: Record<LeverId, string> = {
   'bigger-validation-set': 'Use a bigger validation set',
   'add-repeats': 'Repeat each run with several seeds',
   'supply-reference': 'Supply a reference error level',
-};
+});
 
-export const TEST_WORD: Record<TestName, string> = {
+export const TEST_WORD = words<TestName>({
   'welch-t': "Welch's t-test",
   'z-binomial': 'binomial z-test',
   'mcnemar-exact': "McNemar's exact test",
   'paired-t': 'paired t-test',
   none: 'no test',
-};
+});
 
-export const TEST_WHY: Record<TestName, string> = {
+export const TEST_WHY = words<TestName>({
   'welch-t':
     "Welch's t-test on per-repeat values: each run has two or more repeats (seeds), and their spreads may differ.",
   'z-binomial':
@@ -102,7 +130,14 @@ export const TEST_WHY: Record<TestName, string> = {
   'paired-t':
     'paired t-test on per-example loss differences: both runs scored the same examples with a continuous loss.',
   none: 'no test: with one repeat of a continuous metric and no paired predictions, run-to-run noise is unknown, so only min-effect decides.',
-};
+});
+
+export const REFERENCE_SOURCE = words<ReferenceSource>({
+  artifact: 'from the artifact',
+  config: 'from the config',
+  default: 'the default for a minimized proportion',
+  unknown: 'source unknown',
+});
 
 /** Whether a metric-unit change is an improvement, given the goal. */
 export function reading(call: Call, review: Review): 'better' | 'worse' | 'flat' {
@@ -111,10 +146,10 @@ export function reading(call: Call, review: Review): 'better' | 'worse' | 'flat'
   return up === (review.metric.goal === 'maximize') ? 'better' : 'worse';
 }
 
-/** A component change in shortfall units: up is worse. */
-export function componentReading(call: Call): string {
-  if (call === 'up') return 'up (worse)';
-  if (call === 'down') return 'down (better)';
+/** A component change in shortfall units (up is worse), long or one word. */
+export function componentReading(call: Call, compact: boolean): string {
+  if (call === 'up') return compact ? 'worse' : 'up (worse)';
+  if (call === 'down') return compact ? 'better' : 'down (better)';
   return 'flat';
 }
 

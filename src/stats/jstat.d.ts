@@ -6,6 +6,8 @@ declare module 'jstat' {
   interface JStatStatic {
     /** Regularized incomplete beta I_x(a, b); `false` when x is outside [0, 1]. */
     ibeta(x: number, a: number, b: number): number | false;
+    /** Natural log of the gamma function. */
+    gammaln(x: number): number;
     studentt: {
       /** Quantile of Student's t with `dof` degrees of freedom. */
       inv(p: number, dof: number): number;

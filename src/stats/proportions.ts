@@ -105,11 +105,22 @@ export function twoProportionZ(
  */
 export function wilsonInterval(successes: number, n: number, alpha: number): Interval {
   assertAlpha(alpha);
+  return wilsonAtZ(successes, n, normalQuantile(1 - alpha / 2));
+}
+
+/**
+ * The Wilson score interval at a given normal quantile z ≥ 0 instead of a level (see
+ * `wilsonInterval`). The intervals are nested in z: a larger z never gives a narrower interval,
+ * which is what lets `newcombeDifference` invert its interval into a p-value.
+ */
+export function wilsonAtZ(successes: number, n: number, z: number): Interval {
   assertCount('successes', successes);
   assertCount('n', n);
   if (successes > n) throw new RangeError(`successes (${successes}) must not exceed n (${n})`);
+  if (!(z >= 0) || !Number.isFinite(z)) {
+    throw new RangeError(`z must be a finite number >= 0; got ${z}`);
+  }
   if (n === 0) return [0, 1];
-  const z = normalQuantile(1 - alpha / 2);
   const z2 = z * z;
   const centre = (successes + z2 / 2) / (n + z2);
   const half = (z / (n + z2)) * Math.sqrt((successes * (n - successes)) / n + z2 / 4);

@@ -11,17 +11,6 @@ import { mean, sampleVariance } from './descriptive.js';
 import type { Interval, TestResult, TestName } from './types.js';
 import { assertAlpha, assertFinite, assertFiniteValues, assertMinLength } from './validate.js';
 
-/**
- * Result of the equal-variance (pooled) t test. Its `test` is `'pooled-t'`, which is deliberately not
- * a `TestName`: DESIGN §4 has no pooled test, so a pooled result cannot be passed off as `welch-t` in
- * a review. Otherwise it has the fields of `TestResult`, plus the pooled standard deviation.
- */
-export interface PooledTestResult extends Omit<TestResult, 'test'> {
-  test: 'pooled-t';
-  /** s_p = sqrt(((n1 − 1)s1² + (n2 − 1)s2²) / (n1 + n2 − 2)). */
-  pooledSd: number;
-}
-
 interface TSummary {
   estimate: number;
   ci: Interval;
@@ -70,30 +59,6 @@ export function welchT(
   const se2 = v1 + v2;
   const df = se2 === 0 ? n1 + n2 - 2 : (se2 * se2) / ((v1 * v1) / (n1 - 1) + (v2 * v2) / (n2 - 1));
   return toResult(tInference(mean(candidate) - mean(baseline), se2, df, alpha), 'welch-t');
-}
-
-/**
- * Equal-variance (pooled) two-sample t test, df = n1 + n2 − 2, estimate mean(candidate) −
- * mean(baseline). Kept to check against NIST's printed pooled example; reviews use `welchT`.
- * Needs at least two finite values in each group. Both variances 0: see the module note
- * (`pooledSd` is then 0).
- */
-export function pooledT(
-  baseline: readonly number[],
-  candidate: readonly number[],
-  alpha: number,
-): PooledTestResult {
-  assertAlpha(alpha);
-  checkGroup('baseline', baseline);
-  checkGroup('candidate', candidate);
-  const n1 = baseline.length;
-  const n2 = candidate.length;
-  const df = n1 + n2 - 2;
-  const pooledVar =
-    ((n1 - 1) * sampleVariance(baseline) + (n2 - 1) * sampleVariance(candidate)) / df;
-  const se2 = pooledVar * (1 / n1 + 1 / n2);
-  const summary = tInference(mean(candidate) - mean(baseline), se2, df, alpha);
-  return { ...summary, test: 'pooled-t', pooledSd: Math.sqrt(pooledVar) };
 }
 
 /**

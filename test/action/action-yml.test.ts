@@ -3,6 +3,8 @@ import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { expect, test } from 'vitest';
 import { ROOT, actionYml } from './harness.js';
+import { NUMBER_SETTINGS } from '../../src/model/settings.js';
+import { LIMIT_NAMES } from '../../src/io/open-untrusted.js';
 
 const yml = actionYml();
 
@@ -24,9 +26,18 @@ test('inputs and their defaults', () => {
     'fail-on': null,
     alpha: null,
     'min-effect': null,
+    'gap-tolerance': null,
+    reference: null,
     'status-check': 'auto',
     'report-artifact': 'fitgap-report',
+    'pull-request': null,
+    'base-sha': null,
+    'head-sha': null,
+    'audit-comment': 'false',
     'archive-limit-mb': '50',
+    'max-artifact-mb': null,
+    'max-config-mb': null,
+    'max-csv-mb': null,
   });
 });
 
@@ -39,6 +50,8 @@ test('outputs', () => {
     'report-path',
     'report-dir',
     'comment-url',
+    'audit-record',
+    'audit-record-path',
   ]);
 });
 
@@ -48,18 +61,23 @@ test('runs the bundled entry on node24', () => {
 });
 
 test('every input the settings reader asks for is declared, and every declared one is read', () => {
-  const source = readFileSync(join(ROOT, 'src/action/settings.ts'), 'utf8');
-  const read = new Set(
-    [
+  const source = ['settings.ts', 'audit-settings.ts']
+    .map((f) => readFileSync(join(ROOT, 'src/entries/action', f), 'utf8'))
+    .join('\n');
+  const read = new Set([
+    ...[
       ...source.matchAll(/(?:optional|required|oneOf(?:<\w+>)?|number|getInput)\(\s*'([a-z-]+)'/g),
     ].map((m) => m[1]),
-  );
+    // Read in loops over the one settings source and the file limits.
+    ...Object.keys(NUMBER_SETTINGS),
+    ...Object.values(LIMIT_NAMES).map((n) => n.option),
+  ]);
   expect([...read].sort()).toEqual(Object.keys(yml.inputs).sort());
 });
 
 test('every output the action sets is declared', () => {
-  const sources = ['publish-steps.ts']
-    .map((f) => readFileSync(join(ROOT, 'src/action', f), 'utf8'))
+  const sources = ['publish-steps.ts', 'audit-mode.ts']
+    .map((f) => readFileSync(join(ROOT, 'src/entries/action', f), 'utf8'))
     .join('\n');
   const set = new Set([...sources.matchAll(/setOutput\('([a-z-]+)'/g)].map((m) => m[1]));
   expect([...set].sort()).toEqual(Object.keys(yml.outputs).sort());

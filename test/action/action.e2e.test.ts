@@ -3,15 +3,16 @@
  * REST server on 127.0.0.1. Each test has its own server, repository and temp folders, so they run
  * concurrently. Every answer of the fake is checked against GitHub's OpenAPI description.
  */
-import { existsSync, readFileSync } from 'node:fs';
+import { existsSync, readFileSync, readdirSync } from 'node:fs';
 import { join } from 'node:path';
 import { beforeAll, describe, test } from 'vitest';
+import { expectValidReport } from '../report/valid-review.js';
 import type { ExpectStatic, TestContext } from 'vitest';
-import { BOT, FakeRepo, PERSON, TOKEN } from '../fake-github/repo.js';
+import { BOT, FakeRepo, MAINTAINER, PAT, PERSON, TOKEN } from '../fake-github/repo.js';
 import { FakeGitHub, apiError } from '../fake-github/server.js';
 import type { ActionRun } from './harness.js';
 import { FIXTURES, HEAD, OLD_HEAD, buildBundle, pullRequestEvent, runAction } from './harness.js';
-import { fixtureText, zipFiles } from './zips.js';
+import { filesOf, fixtureText, zipFiles } from './zips.js';
 
 beforeAll(() => buildBundle(), 120_000);
 
@@ -43,6 +44,13 @@ function review(
   });
 }
 
+/** The fresh folder the baseline archive was extracted into. */
+function baselineDir(temp: string): string {
+  const parent = join(temp, 'fitgap-default');
+  const [name] = readdirSync(parent).filter((n) => n.startsWith('baseline-'));
+  return join(parent, name ?? 'missing');
+}
+
 const COMMENTS = 'GET /repos/o/r/issues/7/comments?per_page=100';
 const PULL = 'GET /repos/o/r/pulls/7';
 const POST = 'POST /repos/o/r/issues/7/comments';
@@ -55,7 +63,7 @@ function sane(expect: ExpectStatic, fake: FakeGitHub, run: ActionRun) {
   expect(printed).not.toMatch(/\n\s+at .+:\d+:\d+/);
 }
 
-describe.concurrent('review mode on a pull request', () => {
+describe.concurrent('review mode on a pull request', { timeout: 90_000 }, () => {
   test('first run: summary, report, outputs, one comment, then the gate', async (context) => {
     const { expect } = context;
     const { fake, repo } = await setup(context);
@@ -68,10 +76,9 @@ describe.concurrent('review mode on a pull request', () => {
     // The gate (fail-on: worse-validation, the default when neither input nor config sets it) fails the step after commenting.
     expect(run.code).toBe(1);
     expect(run.stdout).toMatch(/::error::fitgap gate failed:%0A- worse-validation/);
-    const report = JSON.parse(readFileSync(run.outputs['report-path'] ?? '', 'utf8')) as Record<
-      string,
-      unknown
-    >;
+    const text = readFileSync(run.outputs['report-path'] ?? '', 'utf8');
+    expectValidReport(text);
+    const report = JSON.parse(text) as Record<string, unknown>;
     expect(report['format']).toBe('fitgap-review/1');
     expect(run.outputs).toMatchObject({
       movement: report['movement'],
@@ -236,7 +243,7 @@ describe.concurrent('review mode on a pull request', () => {
   });
 });
 
-describe.concurrent('without a pull request, and user errors', () => {
+describe.concurrent('without a pull request, and user errors', { timeout: 90_000 }, () => {
   test('push event: summary, outputs and gate, no API call', async (context) => {
     const { expect } = context;
     const { fake } = await setup(context);
@@ -291,7 +298,7 @@ describe.concurrent('without a pull request, and user errors', () => {
   });
 });
 
-describe.concurrent('baseline from an artifact of the base branch', () => {
+describe.concurrent('baseline from an artifact of the base branch', { timeout: 90_000 }, () => {
   function artifactSetup(repo: FakeRepo, zip: Uint8Array, sizeInBytes?: number) {
     repo.runs.push(
       {
@@ -371,7 +378,7 @@ describe.concurrent('baseline from an artifact of the base branch', () => {
     ]);
     expect(run.code).toBe(0);
     expect(run.outputs['validation-change']).toBe('better');
-    const dir = join(run.temp, 'fitgap-default', 'baseline');
+    const dir = baselineDir(run.temp);
     expect(readFileSync(join(dir, 'run.json'), 'utf8')).toBe(fixtureText(BASELINE));
     expect(existsSync(join(dir, 'model.bin'))).toBe(false);
     expect(existsSync(join(dir, 'notes'))).toBe(false);
@@ -387,7 +394,8 @@ describe.concurrent('baseline from an artifact of the base branch', () => {
     expect(run.stdout).toContain(
       `::error::artifact "baseline-run" (run 501) must not contain an entry with a '..' path segment (got "../../escape.json")`,
     );
-    expect(existsSync(join(run.temp, 'fitgap-default', 'baseline'))).toBe(false);
+    // Refused before anything was written.
+    expect(existsSync(join(run.temp, 'fitgap-default'))).toBe(false);
     expect(existsSync(join(run.temp, '..', 'escape.json'))).toBe(false);
   });
 
@@ -464,116 +472,388 @@ describe.concurrent('baseline from an artifact of the base branch', () => {
   });
 });
 
-describe.concurrent('fork-safe pattern: review uploads, workflow_run publishes', () => {
-  /** Runs review mode as a fork PR would (comment off), and zips its report folder as upload-artifact does. */
-  async function uploadedReport(fake: FakeGitHub, candidate: string): Promise<Uint8Array> {
-    const run = await review(fake, candidate, {
-      inputs: { candidate: 'runs/candidate.json', baseline: 'runs/baseline.json', comment: 'off' },
-    });
-    const dir = run.outputs['report-dir'] ?? '';
-    return zipFiles({
-      'review.json': readFileSync(join(dir, 'review.json')),
-      'pull-request.json': readFileSync(join(dir, 'pull-request.json')),
-    });
-  }
-  const event = {
-    action: 'completed',
-    workflow_run: {
-      id: 777,
-      head_sha: HEAD,
-      event: 'pull_request',
-      conclusion: 'failure',
-      head_repository: { full_name: 'fork/r' },
-      pull_requests: [],
-    },
-    repository: { full_name: 'o/r', default_branch: 'main' },
-  };
-  const publish = (fake: FakeGitHub) =>
-    runAction({
-      apiUrl: fake.url,
-      eventName: 'workflow_run',
-      payload: event,
-      inputs: { mode: 'publish' },
+describe.concurrent(
+  'fork-safe pattern: review uploads runs, workflow_run recomputes',
+  { timeout: 90_000 },
+  () => {
+    /** Runs review mode as a fork PR would (comment off); returns the uploaded folder's files. */
+    async function uploaded(fake: FakeGitHub, candidate: string) {
+      const run = await review(fake, candidate, {
+        inputs: {
+          candidate: 'runs/candidate.json',
+          baseline: 'runs/baseline.json',
+          comment: 'off',
+        },
+      });
+      const dir = run.outputs['report-dir'] ?? '';
+      expectValidReport(readFileSync(join(dir, 'review.json'), 'utf8'));
+      return filesOf(dir);
+    }
+    const event = {
+      action: 'completed',
+      workflow_run: {
+        id: 777,
+        head_sha: HEAD,
+        event: 'pull_request',
+        conclusion: 'failure',
+        head_repository: { full_name: 'fork/r' },
+        pull_requests: [],
+      },
+      repository: { full_name: 'o/r', default_branch: 'main' },
+    };
+    const publish = (fake: FakeGitHub, extra: Partial<Parameters<typeof runAction>[0]> = {}) =>
+      runAction({
+        apiUrl: fake.url,
+        eventName: 'workflow_run',
+        payload: event,
+        inputs: { mode: 'publish' },
+        ...extra,
+      });
+    async function forkSetup(context: TestContext, files: Record<string, string | Uint8Array>) {
+      const { fake, repo } = await setup(context);
+      repo.pulls.set(7, { headSha: HEAD, headRepo: 'fork/r', baseRef: 'main' });
+      repo.artifacts.push({ id: 90, runId: 777, name: 'fitgap-report', zip: zipFiles(files) });
+      fake.log.length = 0;
+      return { fake, repo };
+    }
+
+    test('uploads the runs and the PR note; publish recomputes, comments and creates the check run', async (context) => {
+      const { expect } = context;
+      const { fake } = await setup(context);
+      const files = await uploaded(fake, WORSE);
+      expect(Object.keys(files).sort()).toEqual([
+        'baseline/run.json',
+        'candidate/run.json',
+        'pull-request.json',
+        'review.json',
+      ]);
+      const { fake: trusted, repo } = await forkSetup(context, files);
+      const run = await publish(trusted);
+      sane(expect, trusted, run);
+      expect(trusted.log).toEqual([
+        'GET /repos/o/r/actions/runs/777/artifacts?name=fitgap-report&per_page=100',
+        'GET /repos/o/r/actions/artifacts/90/zip',
+        'GET /storage/artifacts/90.zip?sig=abc',
+        PULL,
+        COMMENTS,
+        POST,
+        COMMENTS,
+        'POST /repos/o/r/check-runs',
+      ]);
+      expect(repo.comments).toHaveLength(1);
+      expect(repo.comments[0]?.body).toContain(`head=${HEAD}`);
+      expect(repo.comments[0]?.body).toContain('candidate/run.json');
+      expect(repo.checkRuns).toHaveLength(1);
+      expect(repo.checkRuns[0]).toMatchObject({
+        name: 'fitgap',
+        head_sha: HEAD,
+        status: 'completed',
+        conclusion: 'failure',
+        details_url: 'https://github.invalid/o/r/actions/runs/9001',
+      });
+      expect(JSON.stringify(repo.checkRuns[0])).toContain('worse-validation');
+      // The gate lives in the check run; the publish step itself succeeded.
+      expect(run.code).toBe(0);
+      expect(run.outputs['gate']).toBe('fail');
+      expect(run.summary).toContain('## fitgap');
     });
 
-  test('downloads the report, checks the PR, comments and creates the check run on its head', async (context) => {
-    const { expect } = context;
-    const { fake, repo } = await setup(context);
-    repo.pulls.set(7, { headSha: HEAD, headRepo: 'fork/r', baseRef: 'main' });
-    repo.artifacts.push({
-      id: 90,
-      runId: 777,
-      name: 'fitgap-report',
-      zip: await uploadedReport(fake, WORSE),
+    test('a forged review.json cannot turn the gate green: the review is recomputed', async (context) => {
+      const { expect } = context;
+      const { fake } = await setup(context);
+      const files = await uploaded(fake, WORSE);
+      type Forged = { validation: { change: string }; gate: unknown; levers: unknown };
+      const forged = JSON.parse(new TextDecoder().decode(files['review.json'])) as Forged;
+      forged.validation.change = 'better';
+      forged.gate = { pass: true, reasons: [], failOn: [] };
+      forged.levers = [{ id: '__proto__', reason: '<img src=x onerror=alert(1)> @octocat' }];
+      files['review.json'] = new TextEncoder().encode(JSON.stringify(forged));
+      // The runs themselves carry hostile names; the renderer escapes every artifact string.
+      const hostile = '<img src=x onerror=alert(1)> @octocat [x](https://evil.invalid) | </table>';
+      for (const side of ['baseline', 'candidate']) {
+        const text = new TextDecoder().decode(files[`${side}/run.json`]);
+        const doc = JSON.parse(text) as Record<string, unknown>;
+        doc['slices'] = [{ name: hostile, examples: 500, train: 0.05, validation: 0.1 }];
+        doc['hyperparameters'] = { ...(doc['hyperparameters'] as object), [hostile]: side };
+        doc['run'] = { ...(doc['run'] as object), name: hostile };
+        files[`${side}/run.json`] = new TextEncoder().encode(JSON.stringify(doc));
+      }
+      const { fake: trusted, repo } = await forkSetup(context, files);
+      const run = await publish(trusted);
+      sane(expect, trusted, run);
+      expect(repo.checkRuns[0]).toMatchObject({ conclusion: 'failure' });
+      expect(run.outputs['validation-change']).toBe('worse');
+      const body = repo.comments[0]?.body ?? '';
+      expect(body).toContain('onerror'); // the name is shown, as text
+      for (const live of ['<img', '</table>', '@octocat', '](https://evil', '__proto__'])
+        expect(body).not.toContain(live);
     });
-    fake.log.length = 0;
-    const run = await publish(fake);
-    sane(expect, fake, run);
-    expect(fake.log).toEqual([
-      'GET /repos/o/r/actions/runs/777/artifacts?name=fitgap-report&per_page=100',
-      'GET /repos/o/r/actions/artifacts/90/zip',
-      'GET /storage/artifacts/90.zip?sig=abc',
-      PULL,
-      COMMENTS,
-      POST,
-      COMMENTS,
-      'POST /repos/o/r/check-runs',
-    ]);
-    expect(repo.comments).toHaveLength(1);
-    expect(repo.comments[0]?.body).toContain(`head=${HEAD}`);
-    expect(repo.checkRuns).toHaveLength(1);
-    expect(repo.checkRuns[0]).toMatchObject({
-      name: 'fitgap',
-      head_sha: HEAD,
-      status: 'completed',
-      conclusion: 'failure',
-      details_url: 'https://github.invalid/o/r/actions/runs/9001',
-    });
-    expect(JSON.stringify(repo.checkRuns[0])).toContain('worse-validation');
-    // The gate lives in the check run; the publish step itself succeeded.
-    expect(run.code).toBe(0);
-    expect(run.outputs['gate']).toBe('fail');
-  });
 
-  test('a report naming another commit is refused: no comment, no check', async (context) => {
-    const { expect } = context;
-    const { fake, repo } = await setup(context);
-    repo.pulls.set(7, { headSha: HEAD, headRepo: 'fork/r', baseRef: 'main' });
-    const zip = await uploadedReport(fake, BETTER);
-    repo.artifacts.push({ id: 91, runId: 777, name: 'fitgap-report', zip });
-    fake.log.length = 0;
-    const forged = { ...event, workflow_run: { ...event.workflow_run, head_sha: OLD_HEAD } };
-    const run = await runAction({
-      apiUrl: fake.url,
-      eventName: 'workflow_run',
-      payload: forged,
-      inputs: { mode: 'publish' },
+    test("the gate policy is the publish side's: its config and inputs, never the upload's", async (context) => {
+      const { expect } = context;
+      const { fake } = await setup(context);
+      const files = await uploaded(fake, WORSE);
+      const { fake: trusted, repo } = await forkSetup(context, files);
+      const run = await publish(trusted, {
+        inputs: { mode: 'publish', config: '.github/fitgap.yml' },
+        files: { '.github/fitgap.yml': `${FIXTURES}/fail-on-none.yml` },
+      });
+      sane(expect, trusted, run);
+      expect(repo.checkRuns[0]).toMatchObject({ conclusion: 'success' });
+      expect(run.outputs['gate']).toBe('pass');
     });
-    sane(expect, fake, run);
-    expect(run.code).toBe(1);
-    expect(run.stdout).toContain(
-      `must name this repository (o/r) and the run's head commit (${OLD_HEAD})`,
-    );
-    expect(fake.log.filter((l) => !l.startsWith('GET'))).toEqual([]);
-    expect(repo.comments).toEqual([]);
-    expect(repo.checkRuns).toEqual([]);
-  });
 
-  test('a PR whose head is in another repository than the run is refused', async (context) => {
-    const { expect } = context;
-    const { fake, repo } = await setup(context);
-    repo.pulls.set(7, { headSha: HEAD, headRepo: 'someone-else/r', baseRef: 'main' });
-    repo.artifacts.push({
-      id: 92,
-      runId: 777,
-      name: 'fitgap-report',
-      zip: await uploadedReport(fake, BETTER),
+    test('with "baseline-artifact" the baseline is fetched from the base branch, not the upload', async (context) => {
+      const { expect } = context;
+      const { fake } = await setup(context);
+      const files = await uploaded(fake, WORSE);
+      // The fork uploads its worse candidate as the baseline too: a review against it shows no change.
+      files['baseline/run.json'] = files['candidate/run.json'] ?? new Uint8Array();
+      const { fake: trusted, repo } = await forkSetup(context, files);
+      repo.runs.push({
+        id: 501,
+        workflowFile: 'train.yml',
+        headSha: 'd'.repeat(40),
+        headBranch: 'main',
+        event: 'push',
+        conclusion: 'success',
+        headRepo: 'o/r',
+      });
+      repo.artifacts.push({
+        id: 77,
+        runId: 501,
+        name: 'fitgap-run',
+        zip: zipFiles({ 'run.json': fixtureText(BASELINE) }),
+      });
+      const run = await publish(trusted, {
+        inputs: {
+          mode: 'publish',
+          'baseline-artifact': 'fitgap-run',
+          'baseline-workflow': 'train.yml',
+        },
+      });
+      sane(expect, trusted, run);
+      expect(trusted.log).toContain(
+        'GET /repos/o/r/actions/workflows/train.yml/runs?status=success&per_page=20&branch=main',
+      );
+      expect(run.outputs['validation-change']).toBe('worse');
+      expect(repo.checkRuns[0]).toMatchObject({ conclusion: 'failure' });
     });
-    const run = await publish(fake);
-    sane(expect, fake, run);
-    expect(run.code).toBe(1);
-    expect(run.stdout).toContain('must name a PR whose head is in fork/r');
-    expect(repo.comments).toEqual([]);
-    expect(repo.checkRuns).toEqual([]);
-  });
-});
+
+    test('every uploaded file is untrusted input: a hostile run is refused, named, before any write', async (context) => {
+      const { expect } = context;
+      const { fake } = await setup(context);
+      const files = await uploaded(fake, BETTER);
+      const run0 = JSON.parse(new TextDecoder().decode(files['candidate/run.json'])) as Record<
+        string,
+        unknown
+      >;
+      const hostile = JSON.stringify(run0).replace('"format"', '"format":"x","format"');
+      files['candidate/run.json'] = new TextEncoder().encode(hostile);
+      const { fake: trusted, repo } = await forkSetup(context, files);
+      const run = await publish(trusted);
+      sane(expect, trusted, run);
+      expect(run.code).toBe(1);
+      expect(run.stdout).toContain(
+        'artifact "fitgap-report" (run 777) candidate/run.json: /format must appear once in its object',
+      );
+      expect(trusted.log.filter((l) => !l.startsWith('GET'))).toEqual([]);
+      expect(repo.comments).toEqual([]);
+      expect(repo.checkRuns).toEqual([]);
+    });
+
+    test('an upload without a candidate run is refused with what it must hold', async (context) => {
+      const { expect } = context;
+      const { fake } = await setup(context);
+      const files = await uploaded(fake, BETTER);
+      delete files['candidate/run.json'];
+      const { fake: trusted, repo } = await forkSetup(context, files);
+      const run = await publish(trusted);
+      sane(expect, trusted, run);
+      expect(run.code).toBe(1);
+      expect(run.stdout).toContain(
+        'artifact "fitgap-report" (run 777) must hold candidate/run.json exactly once (got none)',
+      );
+      expect(repo.comments).toEqual([]);
+    });
+
+    test('a note naming another commit is refused: no comment, no check', async (context) => {
+      const { expect } = context;
+      const { fake } = await setup(context);
+      const { fake: trusted, repo } = await forkSetup(context, await uploaded(fake, BETTER));
+      const forged = { ...event, workflow_run: { ...event.workflow_run, head_sha: OLD_HEAD } };
+      const run = await publish(trusted, { payload: forged });
+      sane(expect, trusted, run);
+      expect(run.code).toBe(1);
+      expect(run.stdout).toContain(
+        `must name this repository (o/r) and the run's head commit (${OLD_HEAD})`,
+      );
+      expect(trusted.log.filter((l) => !l.startsWith('GET'))).toEqual([]);
+      expect(repo.comments).toEqual([]);
+      expect(repo.checkRuns).toEqual([]);
+    });
+
+    test('a PR whose head is in another repository than the run is refused', async (context) => {
+      const { expect } = context;
+      const { fake } = await setup(context);
+      const { fake: trusted, repo } = await forkSetup(context, await uploaded(fake, BETTER));
+      repo.pulls.set(7, { headSha: HEAD, headRepo: 'someone-else/r', baseRef: 'main' });
+      const run = await publish(trusted);
+      sane(expect, trusted, run);
+      expect(run.code).toBe(1);
+      expect(run.stdout).toContain('must name a PR whose head is in fork/r');
+      expect(repo.comments).toEqual([]);
+      expect(repo.checkRuns).toEqual([]);
+    });
+  },
+);
+
+describe.concurrent(
+  'GitHub API faults: the summary is written and the gate applied',
+  { timeout: 90_000 },
+  () => {
+    test('503 on every try of the comment: three tries, the call named, the gate still applied', async (context) => {
+      const { expect } = context;
+      const { fake, repo } = await setup(context);
+      const fail = () => apiError(503, 'Service Unavailable');
+      fake.queue(`POST /repos/{owner}/{repo}/issues/{issue_number}/comments`, fail, fail, fail);
+      const run = await review(fake, WORSE, {
+        inputs: {
+          candidate: 'runs/candidate.json',
+          baseline: 'runs/baseline.json',
+          'status-check': 'check-run',
+        },
+      });
+      sane(expect, fake, run);
+      expect(fake.log.filter((l) => l === POST)).toHaveLength(3);
+      expect(run.summary).toContain('## fitgap');
+      expect(run.code).toBe(1);
+      expect(run.stdout).toContain('fitgap gate failed');
+      expect(run.stdout).toContain(
+        'Could not publish the comment: GitHub API POST /repos/o/r/issues/7/comments answered 503: Service Unavailable',
+      );
+      expect(repo.checkRuns[0]).toMatchObject({ conclusion: 'failure' });
+    });
+
+    test('500 then 502 then success: retried within the bound', async (context) => {
+      const { expect } = context;
+      const { fake, repo } = await setup(context);
+      fake.queue(
+        'GET /repos/{owner}/{repo}/pulls/{pull_number}',
+        () => apiError(500, 'Server Error'),
+        () => apiError(502, 'Bad Gateway'),
+      );
+      const run = await review(fake, BETTER);
+      sane(expect, fake, run);
+      expect(fake.log.slice(0, 3)).toEqual([PULL, PULL, PULL]);
+      expect(repo.comments).toHaveLength(1);
+      expect(run.code).toBe(0);
+    });
+
+    test('401 (a bad token): the call is named, the summary written, the gate applied', async (context) => {
+      const { expect } = context;
+      const { fake } = await setup(context);
+      const run = await review(fake, WORSE, {
+        inputs: {
+          candidate: 'runs/candidate.json',
+          baseline: 'runs/baseline.json',
+          'github-token': 'ghs_wrong',
+        },
+      });
+      sane(expect, fake, run);
+      expect(fake.log).toEqual([PULL]);
+      expect(run.summary).toContain('## fitgap');
+      expect(run.stdout).toContain('fitgap gate failed');
+      expect(run.stdout).toContain(
+        'Could not publish the comment: GitHub API GET /repos/o/r/pulls/7 answered 401: Bad credentials',
+      );
+      expect(run.stdout).toContain('(check the token given as "github-token")');
+      expect(run.code).toBe(1);
+    });
+
+    test('404 (no such pull request): the call is named, the gate applied', async (context) => {
+      const { expect } = context;
+      const { fake, repo } = await setup(context);
+      repo.pulls.delete(7);
+      const run = await review(fake, BETTER);
+      sane(expect, fake, run);
+      expect(run.stdout).toContain('GitHub API GET /repos/o/r/pulls/7 answered 404: Not Found');
+      expect(run.summary).toContain('## fitgap');
+      expect(run.outputs['gate']).toBe('pass');
+      expect(run.code).toBe(1);
+    });
+
+    test('422 on the comment body: shrunk to a pointer and sent once more', async (context) => {
+      const { expect } = context;
+      const { fake, repo } = await setup(context);
+      fake.queue(`POST /repos/{owner}/{repo}/issues/{issue_number}/comments`, () =>
+        apiError(422, 'Validation Failed'),
+      );
+      const run = await review(fake, BETTER);
+      sane(expect, fake, run);
+      expect(fake.log.filter((l) => l === POST)).toHaveLength(2);
+      expect(repo.comments).toHaveLength(1);
+      expect(repo.comments[0]?.body).toContain('more than a comment can hold');
+      expect(repo.comments[0]?.body).toContain(`head=${HEAD}`);
+      expect(run.code).toBe(0);
+    });
+
+    test('a server that never answers: timed out, retried, named; the gate applied', async (context) => {
+      const { expect } = context;
+      const { fake } = await setup(context);
+      fake.on('GET /repos/{owner}/{repo}/pulls/{pull_number}', async () => {
+        await new Promise((done) => setTimeout(done, 5_000));
+        return apiError(500, 'late');
+      });
+      const run = await review(fake, WORSE, { env: { FITGAP_TEST_TIMEOUT_MS: '200' } });
+      expect(fake.log.filter((l) => l === PULL)).toHaveLength(3);
+      expect(run.stdout).toContain(
+        'GitHub API GET /repos/o/r/pulls/7 could not be reached: no answer within 0.2 s (timed out)',
+      );
+      expect(run.stdout).toContain('fitgap gate failed');
+      expect(run.summary).toContain('## fitgap');
+      expect(run.code).toBe(1);
+    });
+
+    test('a refused connection: named, the summary written, the gate applied', async (context) => {
+      const { expect } = context;
+      const { fake } = await setup(context);
+      await fake.close(); // nothing listens on its port any more
+      const run = await review(fake, WORSE);
+      expect(run.stdout).toMatch(
+        /GitHub API GET \/repos\/o\/r\/pulls\/7 could not be reached: connect ECONNREFUSED 127\.0\.0\.1:\d+/,
+      );
+      expect(run.stdout).toContain('fitgap gate failed');
+      expect(run.summary).toContain('## fitgap');
+      expect(run.code).toBe(1);
+    });
+
+    test('a personal access token: its own earlier comment is updated, not duplicated', async (context) => {
+      const { expect } = context;
+      const { fake, repo } = await setup(context);
+      const mine = repo.addComment(
+        `<!-- fitgap:review key=default head=${OLD_HEAD} -->\nold`,
+        MAINTAINER,
+      );
+      const quoting = repo.addComment(`> <!-- fitgap:review key=default head=${HEAD} -->`, PERSON);
+      const inputs = {
+        candidate: 'runs/candidate.json',
+        baseline: 'runs/baseline.json',
+        'github-token': PAT,
+      };
+      const first = await review(fake, BETTER, { inputs });
+      sane(expect, fake, first);
+      expect(fake.log).toEqual([
+        'GET /user',
+        PULL,
+        COMMENTS,
+        `PATCH /repos/o/r/issues/comments/${mine.id}`,
+      ]);
+      const second = await review(fake, WORSE, { inputs });
+      sane(expect, fake, second);
+      expect(repo.comments.map((c) => c.id)).toEqual([mine.id, quoting.id]);
+      expect(repo.comments[0]?.body).toContain('worse');
+      expect(repo.comments[1]?.body).toBe(`> <!-- fitgap:review key=default head=${HEAD} -->`);
+    });
+  },
+);

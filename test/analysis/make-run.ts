@@ -1,4 +1,4 @@
-import type { RunArtifact, Split } from '../../src/artifact/types.js';
+import type { RunArtifact, Split } from '../../src/model/run.js';
 import type { ReviewInput } from '../../src/analysis/review.js';
 
 /** A small run artifact for tests; values are per repeat. */

@@ -5,7 +5,7 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { buildReview } from '../../src/analysis/review.js';
 import { movementOf } from '../../src/analysis/movement.js';
-import type { Delta } from '../../src/analysis/types.js';
+import type { Delta } from '../../src/model/review.js';
 import { makeRun, SETTINGS } from './make-run.js';
 
 const value = fc.double({ min: 0.5, max: 5, noNaN: true });

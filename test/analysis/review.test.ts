@@ -2,7 +2,7 @@ import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { buildReview } from '../../src/analysis/review.js';
 import { movementOf } from '../../src/analysis/movement.js';
-import { validateRun } from '../../src/artifact/validate.js';
+import { validateRun } from '../../src/validate/run.js';
 import { makeRun, SETTINGS } from './make-run.js';
 
 describe('movement table (DESIGN.md §5)', () => {
@@ -58,7 +58,7 @@ describe('buildReview', () => {
     expect(review.validation.change).toBe('worse');
     expect(review.bias.delta?.test).toBe('welch-t');
     expect(review.gate.pass).toBe(false);
-    expect(review.gate.reasons[0]).toMatch(/^worse-validation:/);
+    expect(review.gate.reasons).toEqual([{ outcome: 'worse-validation' }]);
   });
 
   it('calls toward-underfitting and points lambda between old and new', () => {
@@ -78,8 +78,25 @@ describe('buildReview', () => {
     expect(review.movement).toBe('toward-underfitting');
     const first = review.levers[0];
     expect(first?.id).toBe('weaker-regularization');
-    // geometric mean of 0.1 and 10
-    expect(first?.reason).toContain('lambda ≈ 1');
+    // Geometric mean of 0.1 and 10, the PR's own change and the bias it added as evidence.
+    expect(first?.suggestion).toEqual({
+      hyperparameter: 'lambda',
+      value: 1,
+      basis: 'between-old-and-new',
+    });
+    expect(first?.evidence.map((e) => e.kind)).toEqual(['pr-change', 'component-change']);
+    expect(first?.evidence[0]).toEqual({
+      kind: 'pr-change',
+      hyperparameter: 'lambda',
+      from: 0.1,
+      to: 10,
+      direction: 'raised',
+    });
+    expect(first?.evidence[1]).toMatchObject({
+      kind: 'component-change',
+      component: 'bias',
+      delta: { unit: 'shortfall', call: 'up' },
+    });
     expect(review.levers.map((l) => l.id)).not.toContain('stronger-regularization');
   });
 
@@ -104,7 +121,7 @@ describe('buildReview', () => {
     expect(review.validation.delta.test).toBe('none');
     expect(review.validation.delta.p).toBeNull();
     expect(review.movement).toBe('no-significant-change');
-    expect(review.notes.join(' ')).toMatch(/noise is unknown/);
+    expect(review.notes).toContainEqual({ code: 'noise-unknown' });
     expect(review.levers.map((l) => l.id)).toContain('add-repeats');
     // With a min-effect, size alone decides.
     const sized = buildReview({
@@ -120,7 +137,7 @@ describe('buildReview', () => {
     const review = buildReview({ baseline: b, candidate: b, settings: SETTINGS });
     expect(review.candidate.biasUnknown).toBe(true);
     expect(review.candidate.components.bias.value).toBeNull();
-    expect(review.candidate.components.bias.unavailable).toMatch(/reference/);
+    expect(review.candidate.components.bias.unavailable).toBe('no-reference');
     expect(review.levers.map((l) => l.id)).toContain('supply-reference');
     expect(review.candidate.diagnosis).toBe('high-variance');
   });

@@ -1,25 +1,49 @@
 /**
- * The byte-level predictions reader against the original string reader (predictions-reference.ts):
+ * The byte-level predictions reader against the string reader it replaced (predictions-reference.ts):
  * on generated CSVs — empty files, header only, BOM, CRLF and lone CR, blank and padded lines,
  * quotes, UTF-8 and broken UTF-8, duplicates, shuffled and partly overlapping ids, bad and unusual
- * values — both give the same result, bit for bit, or the same error with the same issues.
+ * values — both give the same result, bit for bit, or the same error with the same issues; for a
+ * pair of files (pairPredictions) and for one file (checkPredictions).
  */
-import { mkdtempSync, writeFileSync } from 'node:fs';
-import { open } from 'node:fs/promises';
+import { createReadStream, mkdtempSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
+import { Readable } from 'node:stream';
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { pairPredictions, type PredictionsFile } from '../../src/artifact/predictions.js';
-import type { MetricKind } from '../../src/artifact/types.js';
-import { referencePairPredictions } from './predictions-reference.js';
+import {
+  checkPredictions,
+  pairPredictions,
+  type PredictionsFile,
+} from '../../src/artifact/predictions.js';
+import { predictionsSource } from '../../src/io/load-run.js';
+import { DEFAULT_FILE_LIMITS } from '../../src/io/open-untrusted.js';
+import type { MetricKind } from '../../src/model/run.js';
+import { referenceCheckPredictions, referencePairPredictions } from './predictions-reference.js';
 
 const dir = mkdtempSync(join(tmpdir(), 'fitgap-pred-diff-'));
 let counter = 0;
-function write(bytes: Uint8Array): { path: string; file: string } {
+/** A file on disk, read as the reference reads it (a plain file stream). */
+function write(bytes: Uint8Array): PredictionsFile & { path: string } {
   const file = `d${counter++}.csv`;
-  writeFileSync(join(dir, file), bytes);
-  return { path: join(dir, file), file };
+  const path = join(dir, file);
+  writeFileSync(path, bytes);
+  return { path, file, open: async () => createReadStream(path) };
+}
+
+/**
+ * The same file as a review opens it: through the io layer's checks (open-untrusted.ts), read in
+ * place (`openBytes`) or, without it, as a stream.
+ */
+function checked(f: { path: string; file: string }, bytes: boolean): PredictionsFile {
+  const source = predictionsSource({
+    path: f.path,
+    file: f.file,
+    what: 'a predictions CSV',
+    limit: 'csvBytes',
+    limits: DEFAULT_FILE_LIMITS,
+  });
+  return bytes ? source : { file: source.file, open: source.open };
 }
 
 /** Numbers as their exact shortest text, -0 kept apart from 0. */
@@ -181,17 +205,18 @@ function csv(kind: MetricKind) {
     });
 }
 
-/** Splits bytes into chunks of the given sizes (cycled), as an async iterable factory. */
-function chunked(data: Uint8Array, sizes: number[]): () => AsyncIterable<Uint8Array> {
-  return async function* () {
+/** The file's bytes in chunks of the given sizes (cycled), a fresh stream per `open()`. */
+function chunked(file: string, data: Uint8Array, sizes: number[]): PredictionsFile {
+  async function* chunks(): AsyncGenerator<Buffer> {
     let at = 0;
     let k = 0;
     while (at < data.length) {
       const n = Math.max(1, sizes[k++ % sizes.length] ?? 1);
-      yield data.subarray(at, at + n);
+      yield Buffer.from(data.subarray(at, at + n));
       at += n;
     }
-  };
+  }
+  return { file, open: async () => Readable.from(chunks(), { objectMode: false }) };
 }
 
 describe('byte-level predictions reader = string reader', () => {
@@ -201,31 +226,29 @@ describe('byte-level predictions reader = string reader', () => {
         fc.asyncProperty(
           csv(kind),
           csv(kind),
-          fc.constantFrom('path', 'handle', 'chunks'),
+          fc.constantFrom('stream', 'checked', 'checked-stream', 'chunks'),
           fc.array(fc.integer({ min: 1, max: 40 }), { minLength: 1, maxLength: 5 }),
           async (baseBytes, candBytes, how, sizes) => {
             const b = write(baseBytes);
             const c = write(candBytes);
             const expected = await outcome(() => referencePairPredictions(b, c, kind));
-            const handles = how === 'handle' ? [await open(b.path), await open(c.path)] : [];
-            try {
-              const as = (
-                f: { path: string; file: string },
-                data: Uint8Array,
-                i: number,
-              ): PredictionsFile =>
-                how === 'path'
-                  ? f
-                  : how === 'handle'
-                    ? { file: f.file, source: handles[i] as NonNullable<PredictionsFile['source']> }
-                    : { file: f.file, source: chunked(data, sizes) };
-              const actual = await outcome(() =>
-                pairPredictions(as(b, baseBytes, 0), as(c, candBytes, 1), kind),
-              );
-              expect(actual).toBe(expected);
-            } finally {
-              for (const h of handles) await h.close();
-            }
+            const as = (
+              f: PredictionsFile & { path: string },
+              data: Uint8Array,
+            ): PredictionsFile =>
+              how === 'stream'
+                ? f
+                : how === 'chunks'
+                  ? chunked(f.file, data, sizes)
+                  : checked(f, how === 'checked');
+            const actual = await outcome(() =>
+              pairPredictions(as(b, baseBytes), as(c, candBytes), kind),
+            );
+            expect(actual).toBe(expected);
+            // One file on its own: the check a review makes of a side without a partner.
+            expect(await outcome(() => checkPredictions(as(b, baseBytes), kind))).toBe(
+              await outcome(() => referenceCheckPredictions(b, kind)),
+            );
           },
         ),
         { numRuns: 400 },
@@ -292,7 +315,7 @@ describe('byte-level predictions reader = string reader', () => {
     const expected = await outcome(() => referencePairPredictions(b, c, 'proportion'));
     expect(expected).toMatch(/line 3 must have a unique id \(also on line 2\)/);
     const actual = await outcome(() =>
-      pairPredictions({ file: b.file, source: chunked(data, [15, 16]) }, c, 'proportion'),
+      pairPredictions(chunked(b.file, data, [15, 16]), c, 'proportion'),
     );
     expect(actual).toBe(expected);
   });

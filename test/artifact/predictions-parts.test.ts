@@ -15,7 +15,10 @@ import {
   hashId,
   hashed,
 } from '../../src/artifact/id-tables.js';
-import { NEED, PredictionLines, ROW, iterableReader } from '../../src/artifact/prediction-lines.js';
+import { Readable } from 'node:stream';
+import { NEED, PredictionLines, ROW, streamReader } from '../../src/artifact/prediction-lines.js';
+import { InputError } from '../../src/model/errors.js';
+import { MAX_MAGNITUDE } from '../../src/model/limits.js';
 
 const ids = fc.oneof(
   fc.integer({ min: 0, max: 40 }).map((i) => `id-${i}`),
@@ -120,9 +123,14 @@ describe('IdOrder', () => {
 async function losses(text: string, chunk: number): Promise<number[]> {
   const data = Buffer.from(text);
   const lines = new PredictionLines(
-    iterableReader(async function* () {
-      for (let at = 0; at < data.length; at += chunk) yield data.subarray(at, at + chunk);
-    }),
+    streamReader(async () =>
+      Readable.from(
+        (function* () {
+          for (let at = 0; at < data.length; at += chunk) yield data.subarray(at, at + chunk);
+        })(),
+        { objectMode: false },
+      ),
+    ),
     'l.csv',
     'continuous',
   );
@@ -139,7 +147,7 @@ async function losses(text: string, chunk: number): Promise<number[]> {
 }
 
 describe('PredictionLines number fast path', () => {
-  it('reads every plain decimal to the same double as Number() (property)', async () => {
+  it('reads every plain decimal within ±1e15 to the same double as Number() (property)', async () => {
     // Source: ECMA-262 §7.1.4.1.1 StringToNumber (the string rules use Number(); V8 rounds
     // correctly), so Number() of the same text is the reference.
     const decimal = fc
@@ -154,11 +162,15 @@ describe('PredictionLines number fast path', () => {
       .map(
         ([neg, int, frac, exp]) =>
           `${neg ? '-' : ''}${int}${frac === null ? '' : `.${frac}`}${exp === null ? '' : `${exp[0]}${exp[1]}`}`,
-      );
+      )
+      .filter((t) => Math.abs(Number(t)) <= MAX_MAGNITUDE);
     await fc.assert(
       fc.asyncProperty(
         fc.array(
-          fc.oneof(decimal, fc.double({ noNaN: true, noDefaultInfinity: true }).map(String)),
+          fc.oneof(
+            decimal,
+            fc.double({ min: -MAX_MAGNITUDE, max: MAX_MAGNITUDE, noNaN: true }).map(String),
+          ),
           {
             minLength: 1,
             maxLength: 200,
@@ -176,5 +188,19 @@ describe('PredictionLines number fast path', () => {
       ),
       { numRuns: 200 },
     );
+  });
+
+  it('refuses a value beyond ±1e15 on the byte path as on the string path', async () => {
+    // Source: the magnitude limit of model/limits.ts (MAX_MAGNITUDE), the string rule's own.
+    for (const text of ['1000000000000000.5', '-2e15', '1e16', '12345678901234567']) {
+      for (const chunk of [1, 7, 64]) {
+        const error = await losses(`id,loss\na,1\nb,${text}\n`, chunk).catch((e: unknown) => e);
+        expect(error).toBeInstanceOf(InputError);
+        expect((error as InputError).message).toContain(
+          `line 3 column "loss" must be a decimal number within ±1e15 (got "${text}")`,
+        );
+      }
+    }
+    expect(await losses('id,loss\na,1e15\nb,-1000000000000000\n', 5)).toEqual([1e15, -1e15]);
   });
 });

@@ -1,13 +1,16 @@
 /**
- * Test-only: the original string reader of predictions CSVs (readline, a row object per line), kept
- * as the reference that the byte-level reader must match exactly (predictions-differential.test.ts).
+ * Test-only: the string reader of predictions CSVs (readline, a row object per line) as it stood
+ * before the byte-level reader replaced it, kept as the reference that the byte-level reader must
+ * match exactly (predictions-differential.test.ts): same results bit for bit, same errors.
  */
-import { createReadStream } from 'node:fs';
 import { createInterface } from 'node:readline';
-import type { MetricKind } from '../../src/artifact/types.js';
-import { InputError, quote, type Issue } from '../../src/errors.js';
+import type { Readable } from 'node:stream';
+import type { MetricKind } from '../../src/model/run.js';
+import { InputError, quote, type Issue } from '../../src/model/errors.js';
 import { RunningStats } from '../../src/stats/index.js';
-import type { PairedPredictions } from '../../src/analysis/review.js';
+import type { PairedPredictions } from '../../src/model/review.js';
+import { MAX_MAGNITUDE } from '../../src/model/limits.js';
+import { parseDecimal } from '../../src/model/settings.js';
 
 interface Row {
   id: string;
@@ -52,8 +55,15 @@ class HashLog {
 
 function parseValue(raw: string, kind: MetricKind, file: string, line: number): number {
   const column = kind === 'proportion' ? 'correct' : 'loss';
-  const value = raw.trim() === '' ? Number.NaN : Number(raw);
-  if (kind === 'proportion' ? value !== 0 && value !== 1 : !Number.isFinite(value)) {
+  // Only the digits 0 and 1 in a 0/1 column (not `0x1`, `+1`, `1e0`); plain decimals for a loss.
+  const text = raw.trim();
+  const value =
+    kind === 'proportion'
+      ? text === '0' || text === '1'
+        ? Number(text)
+        : Number.NaN
+      : (parseDecimal(text) ?? Number.NaN);
+  if (!Number.isFinite(value) || Math.abs(value) > MAX_MAGNITUDE) {
     throw new InputError([
       {
         file,
@@ -61,7 +71,7 @@ function parseValue(raw: string, kind: MetricKind, file: string, line: number): 
         expected:
           kind === 'proportion'
             ? `column "${column}" must be 1 or 0`
-            : `column "${column}" must be a finite number`,
+            : `column "${column}" must be a decimal number within ±1e15`,
         got: quote(raw),
       },
     ]);
@@ -70,14 +80,16 @@ function parseValue(raw: string, kind: MetricKind, file: string, line: number): 
 }
 
 async function* readRows(
-  path: string,
-  file: string,
+  source: PredictionsFile,
   kind: MetricKind,
   hashes?: HashLog,
 ): AsyncGenerator<Row> {
-  const stream = createReadStream(path, { encoding: 'utf8' });
+  const file = source.file;
+  const stream = await source.open();
+  stream.setEncoding('utf8');
   const lines = createInterface({ input: stream, crlfDelay: Infinity });
   let line = 0;
+  let rows = 0;
   try {
     for await (const text of lines) {
       line++;
@@ -113,6 +125,7 @@ async function* readRows(
           { file, pointer: `line ${line}`, expected: 'must have a non-empty id' },
         ]);
       hashes?.push(hashId(id));
+      rows++;
       yield { id, value: parseValue(text.slice(comma + 1), kind, file, line), line };
     }
   } finally {
@@ -128,17 +141,27 @@ async function* readRows(
       },
     ]);
   }
+  if (rows === 0) {
+    throw new InputError([
+      {
+        file,
+        pointer: '',
+        expected: 'must have one row per example under its header',
+        got: 'no rows',
+      },
+    ]);
+  }
 }
 
 async function duplicateIssues(
-  path: string,
-  file: string,
+  source: PredictionsFile,
   kind: MetricKind,
   suspects: Set<number>,
 ): Promise<Issue[]> {
+  const file = source.file;
   const firstLine = new Map<string, number>();
   const issues: Issue[] = [];
-  for await (const row of readRows(path, file, kind)) {
+  for await (const row of readRows(source, kind)) {
     if (!suspects.has(hashId(row.id))) continue;
     const first = firstLine.get(row.id);
     if (first === undefined) firstLine.set(row.id, row.line);
@@ -154,10 +177,27 @@ async function duplicateIssues(
 }
 
 export interface PredictionsFile {
-  /** Path to open. */
-  path: string;
   /** Name shown in messages. */
   file: string;
+  /**
+   * Opens the file afresh for one pass (the io layer applies its checks; a second pass looks for
+   * duplicate ids). Read errors arrive through the stream as `InputError`s.
+   */
+  open: () => Promise<Readable>;
+}
+
+/** Reads one predictions file through to check it (header, values, unique ids, at least one row). */
+export async function referenceCheckPredictions(
+  source: PredictionsFile,
+  kind: MetricKind,
+): Promise<void> {
+  const hashes = new HashLog();
+  for await (const row of readRows(source, kind, hashes)) void row;
+  const repeated = hashes.repeated();
+  if (repeated.size > 0) {
+    const issues = await duplicateIssues(source, kind, repeated);
+    if (issues.length > 0) throw new InputError(issues);
+  }
 }
 
 /** Pairs baseline and candidate predictions by id, streaming both files. */
@@ -168,8 +208,8 @@ export async function referencePairPredictions(
 ): Promise<PairedPredictions & { unmatched: { baseline: number; candidate: number } }> {
   const baseHashes = new HashLog();
   const candHashes = new HashLog();
-  const base = readRows(baseline.path, baseline.file, kind, baseHashes);
-  const cand = readRows(candidate.path, candidate.file, kind, candHashes);
+  const base = readRows(baseline, kind, baseHashes);
+  const cand = readRows(candidate, kind, candHashes);
   const waitingBase = new Map<string, number>();
   const waitingCand = new Map<string, number>();
   let rows = 0;
@@ -212,11 +252,9 @@ export async function referencePairPredictions(
 
   const issues: Issue[] = [];
   const baseRepeated = baseHashes.repeated();
-  if (baseRepeated.size > 0)
-    issues.push(...(await duplicateIssues(baseline.path, baseline.file, kind, baseRepeated)));
+  if (baseRepeated.size > 0) issues.push(...(await duplicateIssues(baseline, kind, baseRepeated)));
   const candRepeated = candHashes.repeated();
-  if (candRepeated.size > 0)
-    issues.push(...(await duplicateIssues(candidate.path, candidate.file, kind, candRepeated)));
+  if (candRepeated.size > 0) issues.push(...(await duplicateIssues(candidate, kind, candRepeated)));
   if (issues.length > 0) throw new InputError(issues);
 
   const unmatched = { baseline: waitingBase.size, candidate: waitingCand.size };

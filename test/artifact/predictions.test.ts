@@ -1,17 +1,17 @@
-import { mkdtempSync, writeFileSync } from 'node:fs';
+import { createReadStream, mkdtempSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { pairPredictions } from '../../src/artifact/predictions.js';
-import { InputError } from '../../src/errors.js';
+import { pairPredictions, type PredictionsFile } from '../../src/artifact/predictions.js';
+import { InputError } from '../../src/model/errors.js';
 
 const dir = mkdtempSync(join(tmpdir(), 'fitgap-pred-'));
 let counter = 0;
-function csv(text: string): { path: string; file: string } {
+function csv(text: string): PredictionsFile {
   const file = `p${counter++}.csv`;
   writeFileSync(join(dir, file), text);
-  return { path: join(dir, file), file };
+  return { file, open: async () => createReadStream(join(dir, file)) };
 }
 
 describe('pairPredictions', () => {

@@ -1,7 +1,7 @@
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
-import { validateRun } from '../../src/artifact/validate.js';
-import { InputError } from '../../src/errors.js';
+import { validateRun } from '../../src/validate/run.js';
+import { InputError } from '../../src/model/errors.js';
 
 const example = JSON.parse(readFileSync('test/fixtures/design/example.json', 'utf8')) as unknown;
 

@@ -6,7 +6,7 @@
 import { readFileSync } from 'node:fs';
 import { resolve } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { runCli } from '../../src/cli/main.js';
+import { runCli } from '../../src/entries/cli/main.js';
 import { fakeIo } from './fake-io.js';
 
 interface Case {

@@ -1,13 +1,13 @@
 /**
  * End-to-end runs of the built CLI (dist/cli.js) as a child process, as a user would run it.
  */
-import { execFile } from 'node:child_process';
+import { execFile, spawn } from 'node:child_process';
 import { existsSync, mkdtempSync, readFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { promisify } from 'node:util';
 import { beforeAll, describe, expect, it } from 'vitest';
-import { MAIN_HELP, REVIEW_HELP } from '../../src/cli/help.js';
+import { expectValidReport } from '../report/valid-review.js';
 
 const run = promisify(execFile);
 const cli = resolve('dist/cli.js');
@@ -25,12 +25,63 @@ async function fitgap(args: string[], env: Record<string, string> = {}) {
   }
 }
 
+const MAIN_HELP = `fitgap - bias/variance review of a model-training change
+
+Usage:
+  fitgap review --baseline FILE --candidate FILE [options]
+  fitgap validate FILE...
+  fitgap audit --range A..B --artifact PATH [options]
+  fitgap audit --repo OWNER/NAME --pull-request N [options]
+  fitgap demo [NAME]
+  fitgap curves import --from FORMAT PATH... --out FILE
+  fitgap --version
+
+Commands:
+  review     compare two run artifacts and print the review
+  validate   check run artifacts (.json) or config files (.yml) and exit
+  audit      re-run reviews over a git range, or a past pull request's review
+  demo       review the bundled demo scenario
+  curves     import a training log (CSV, TensorBoard, MLflow, evals_result) as a curve
+
+Run 'fitgap COMMAND --help' for the options of a command.
+
+Exit codes: 0 review done and gate passed; 1 gate failed; 2 bad input or usage.
+A verdict is advice for a human reviewer, not a proof.
+`;
+
+const REVIEW_HELP = `Usage: fitgap review --baseline FILE --candidate FILE [options]
+
+Compare a candidate training run with its baseline: error decomposition, significance of
+each change, movement in the bias/variance plane, and the next levers to try.
+
+Options:
+  --baseline FILE       baseline run artifact (fitgap-run/1 JSON)
+  --candidate FILE      candidate run artifact (fitgap-run/1 JSON)
+  --config FILE         config file (default: .github/fitgap.yml when it exists)
+  --format FORMAT       text (default), markdown or json
+  --out FILE            write the review to FILE instead of standard output
+  --alpha N             significance level, 0.000001 to 0.5 (default 0.05)
+  --min-effect N        smallest change that counts, in metric units (default 0)
+  --gap-tolerance N     component present at N x validation error, 0 to 1 (default 0.10)
+  --reference N         reference level (human-level or Bayes error) for both runs
+  --fail-on LIST        outcomes that fail the gate, separated by commas or new lines
+                        (default worse-validation; 'none' never fails; never empty)
+  --comment-key KEY     key of the hidden marker in markdown output (default 'default')
+  --max-artifact-mb N   largest run artifact or epoch log read (default 16)
+  --max-config-mb N     largest config file read (default 1)
+  --max-csv-mb N        largest predictions CSV read (default 512)
+  -h, --help            show this help
+
+Flags override the config file. Exit codes: 0 gate passed; 1 gate failed; 2 bad input.
+`;
+
 beforeAll(async () => {
   if (!existsSync(cli)) await run('npm', ['run', '-s', 'build']);
 });
 
 describe('fitgap CLI (built)', () => {
   it('prints help and version', async () => {
+    // Literal text, so a change to the help is a visible change to this test.
     expect((await fitgap(['--help'])).stdout).toBe(MAIN_HELP);
     expect((await fitgap(['review', '--help'])).stdout).toBe(REVIEW_HELP);
     const pkg = JSON.parse(readFileSync('package.json', 'utf8')) as { version: string };
@@ -51,24 +102,26 @@ describe('fitgap CLI (built)', () => {
     ]);
     expect(result.stderr).toBe('');
     expect(result.code).toBe(0);
+    expectValidReport(result.stdout);
     const report = JSON.parse(result.stdout) as Record<string, unknown> & {
       validation: { change: string; delta: { test: string } };
       bias: { delta: Record<string, unknown> };
       variance: { delta: Record<string, unknown> };
-      levers: { id: string; reason: string; evidence: string[] }[];
-      gate: { pass: boolean; reasons: string[] };
+      levers: { id: string; score: number; evidence: { kind: string }[] }[];
+      gate: { pass: boolean; reasons: unknown[] };
     };
     expect(report['format']).toBe('fitgap-review/1');
     expect(report['movement']).toBe('toward-overfitting');
     expect(['better', 'worse', 'flat']).toContain(report.validation.change);
     for (const delta of [report.bias.delta, report.variance.delta]) {
-      expect(Object.keys(delta).sort()).toEqual(['call', 'ci', 'estimate', 'p', 'test']);
+      expect(Object.keys(delta).sort()).toEqual(['call', 'ci', 'estimate', 'p', 'test', 'unit']);
+      expect(delta['unit']).toBe('shortfall');
     }
     expect(report).toHaveProperty('baseline.diagnosis');
     expect(report).toHaveProperty('candidate.diagnosis');
-    expect(report.levers[0]).toEqual({
+    expect(report.levers[0]).toMatchObject({
       id: expect.any(String),
-      reason: expect.any(String),
+      score: expect.any(Number),
       evidence: expect.any(Array),
     });
     expect(report.gate).toEqual({ pass: true, reasons: [], failOn: ['none'] });
@@ -125,5 +178,31 @@ describe('fitgap CLI (built)', () => {
     expect(bad.stderr).toBe(
       'test/fixtures/bad/bad-goal.json: /metric/goal must be one of "minimize", "maximize" (got "lower").\n',
     );
+  });
+
+  it("a reader that goes away (| head) ends the CLI quietly, with the review's own exit code", async () => {
+    for (const [failOn, expected] of [
+      ['none', 0],
+      ['any-movement', 1],
+    ] as const) {
+      const child = spawn(process.execPath, [
+        cli,
+        'review',
+        '--baseline',
+        'test/fixtures/design/example.json',
+        '--candidate',
+        'test/fixtures/design/candidate/example.json',
+        '--format',
+        'markdown',
+        '--fail-on',
+        failOn,
+      ]);
+      child.stdout.destroy(); // the reader is gone before the first byte: EPIPE
+      let stderr = '';
+      child.stderr.on('data', (chunk: Buffer) => (stderr += chunk.toString()));
+      const code = await new Promise<number | null>((done) => child.on('close', done));
+      expect(stderr).toBe('');
+      expect(code).toBe(expected);
+    }
   });
 });

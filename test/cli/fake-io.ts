@@ -1,5 +1,5 @@
 import { resolve } from 'node:path';
-import type { CliIo } from '../../src/cli/io.js';
+import type { CliIo } from '../../src/entries/cli/io.js';
 
 /** In-memory CliIo: collects output; writes files into a map. */
 export function fakeIo(cwd: string, overrides: Partial<CliIo> = {}) {

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
-import { reviewFiles, resolveSettings } from '../../src/review-files.js';
-import { parseConfig } from '../../src/config/load-config.js';
+import { reviewFiles, resolveSettings } from '../../src/io/review-from-files.js';
+import { parseConfig } from '../../src/io/load-config.js';
+import { expectValidReport } from '../report/valid-review.js';
 
 describe('config', () => {
   it('maps a CSV epoch log next to each artifact onto curves.epochs', async () => {
@@ -21,6 +22,7 @@ describe('config', () => {
     expect(cand.stoppedLate).toBe(true);
     expect(base.stoppedLate).toBe(false);
     expect(review.levers.map((l) => l.id)).toContain('early-stopping');
+    expectValidReport(review);
   });
 
   it('lets flags override the file, and the file override the defaults', async () => {

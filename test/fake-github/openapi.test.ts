@@ -1,6 +1,11 @@
 /** The fake's guard against drift must itself be able to fail. */
+import { readFileSync } from 'node:fs';
+import { createRequire } from 'node:module';
 import { describe, expect, test } from 'vitest';
+import { subset } from '../../scripts/openapi-subset.mjs';
 import { checkResponse, convert, example } from './openapi.js';
+import { FakeRepo } from './repo.js';
+import { FakeGitHub } from './server.js';
 
 const COMMENT = 'POST /repos/{owner}/{repo}/issues/{issue_number}/comments';
 
@@ -74,4 +79,32 @@ describe('convert (OpenAPI 3.0 → JSON Schema)', () => {
       properties: { nullable: { type: 'boolean' }, example: { type: 'string' } },
     });
   });
+});
+
+describe('the subset of the description the fake reads', () => {
+  const list = JSON.parse(readFileSync('test/fake-github/operations.json', 'utf8')) as {
+    operations: string[];
+    examples: string[];
+  };
+
+  test('holds every operation the fake repository answers for', () => {
+    const operations: string[] = [];
+    const server = new FakeGitHub();
+    server.on = (operation: string) => {
+      operations.push(operation);
+      return server;
+    };
+    new FakeRepo(server).install();
+    expect(operations.filter((o) => !list.operations.includes(o))).toEqual([]);
+  });
+
+  test('is what the script makes from the installed @octokit/openapi', () => {
+    const file = createRequire(import.meta.url).resolve(
+      '@octokit/openapi/generated/api.github.com.json',
+    );
+    const full: unknown = JSON.parse(readFileSync(file, 'utf8'));
+    const committed: unknown = JSON.parse(readFileSync('test/fake-github/api-subset.json', 'utf8'));
+    // When this fails after an update of @octokit/openapi: node scripts/openapi-subset.mjs
+    expect(subset(full, list)).toEqual(committed);
+  }, 60_000);
 });

@@ -1,6 +1,8 @@
 /**
  * Validates the fake server's responses against GitHub's published OpenAPI description
  * (`@octokit/openapi`, api.github.com, OpenAPI 3.0.3), so the fake cannot drift from the real API.
+ * The part the fake uses is read from `api-subset.json` (120 KB, kept current by a test); an
+ * operation outside it loads the full 13 MB description, slowly but correctly.
  *
  * OpenAPI 3.0 schemas are not quite JSON Schema; they are converted once before ajv sees them:
  * - `nullable: true` becomes `type: [T, "null"]` (and `null` joins an `enum`); without a `type`
@@ -16,24 +18,29 @@ import type { ValidateFunction } from 'ajv';
 import addFormats from 'ajv-formats';
 import { readFileSync } from 'node:fs';
 import { createRequire } from 'node:module';
+import { fileURLToPath } from 'node:url';
 
 type Json = Record<string, unknown>;
 
 const DOC_ID = 'https://openapi.invalid/api.github.com.json';
 const require = createRequire(import.meta.url);
 
-let spec: {
+type Description = {
   paths: Record<string, Record<string, Json>>;
   components: Record<string, Record<string, Json>>;
-} | null = null;
-let ajv: Ajv | null = null;
-const compiled = new Map<string, ValidateFunction | null>();
+};
 
-function load() {
-  if (spec !== null && ajv !== null) return { spec, ajv };
-  const file = require.resolve('@octokit/openapi/generated/api.github.com.json');
-  spec = JSON.parse(readFileSync(file, 'utf8')) as NonNullable<typeof spec>;
-  ajv = new Ajv({ strict: false, allErrors: true, validateFormats: true });
+interface Loaded {
+  spec: Description;
+  ajv: Ajv;
+  compiled: Map<string, ValidateFunction | null>;
+}
+
+let small: Loaded | null = null;
+let full: Loaded | null = null;
+
+function prepare(spec: Description): Loaded {
+  const ajv = new Ajv({ strict: false, allErrors: true, validateFormats: true });
   addFormats.default(ajv);
   ajv.addFormat('int64', true);
   ajv.addFormat('int32', true);
@@ -41,7 +48,26 @@ function load() {
   for (const [name, schema] of Object.entries(spec.components['schemas'] ?? {}))
     schemas[name] = convert(schema);
   ajv.addSchema({ $id: DOC_ID, components: { schemas } });
-  return { spec, ajv };
+  return { spec, ajv, compiled: new Map() };
+}
+
+function read(file: string): Description {
+  return JSON.parse(readFileSync(file, 'utf8')) as Description;
+}
+
+/** The subset, or the full description when the subset lacks the operation (or the example). */
+function load(need?: { operation?: string; example?: string }): Loaded {
+  small ??= prepare(read(fileURLToPath(new URL('./api-subset.json', import.meta.url))));
+  const has = (l: Loaded) => {
+    if (need?.example !== undefined)
+      return l.spec.components['examples']?.[need.example] !== undefined;
+    if (need?.operation === undefined) return true;
+    const [method = '', path = ''] = need.operation.split(' ');
+    return l.spec.paths[path]?.[method.toLowerCase()] !== undefined;
+  };
+  if (has(small)) return small;
+  full ??= prepare(read(require.resolve('@octokit/openapi/generated/api.github.com.json')));
+  return full;
 }
 
 /** OpenAPI 3.0 schema object → JSON Schema (draft 7) that ajv understands. */
@@ -80,11 +106,11 @@ export function convert(schema: unknown): Json {
   return { anyOf: [out, { type: 'null' }] };
 }
 
-function resolveResponse(responses: Json, status: number): Json | null {
+function resolveResponse(doc: Description, responses: Json, status: number): Json | null {
   let response = (responses[String(status)] ?? null) as Json | null;
   if (response !== null && typeof response['$ref'] === 'string') {
     const name = response['$ref'].split('/').pop() ?? '';
-    response = (load().spec.components['responses']?.[name] ?? null) as Json | null;
+    response = (doc.components['responses']?.[name] ?? null) as Json | null;
   }
   return response;
 }
@@ -97,13 +123,13 @@ function resolveResponse(responses: Json, status: number): Json | null {
  */
 export function responseValidator(operation: string, status: number): ValidateFunction | null {
   const key = `${operation} ${status}`;
+  const { spec: doc, ajv: validator, compiled } = load({ operation });
   if (compiled.has(key)) return compiled.get(key) ?? null;
-  const { spec: doc, ajv: validator } = load();
   const [method = '', path = ''] = operation.split(' ');
   const op = doc.paths[path]?.[method.toLowerCase()];
   if (op === undefined)
     throw new Error(`no operation ${operation} in GitHub's OpenAPI description`);
-  const response = resolveResponse(op['responses'] as Json, status);
+  const response = resolveResponse(doc, op['responses'] as Json, status);
   let schema: unknown;
   if (response === null)
     schema = status >= 400 ? { $ref: '#/components/schemas/basic-error' } : undefined;
@@ -132,7 +158,7 @@ export function checkResponse(operation: string, status: number, body: unknown):
 
 /** A response example from the description (`components.examples[name].value`), deep-copied. */
 export function example<T = Json>(name: string): T {
-  const value = load().spec.components['examples']?.[name]?.['value'];
+  const value = load({ example: name }).spec.components['examples']?.[name]?.['value'];
   if (value === undefined) throw new Error(`no example ${name} in GitHub's OpenAPI description`);
   return structuredClone(value) as T;
 }

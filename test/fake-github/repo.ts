@@ -18,6 +18,16 @@ export interface User {
 export const BOT: User = { login: 'github-actions[bot]', type: 'Bot' };
 export const PERSON: User = { login: 'octo-reviewer', type: 'User' };
 export const TOKEN = 'ghs_faketoken0123456789';
+/** A personal access token; it writes as MAINTAINER, a person. */
+export const PAT = 'ghp_fakepersonaltoken0123';
+export const MAINTAINER: User = { login: 'octo-maintainer', type: 'User' };
+
+/** Who a token writes as, or null for a token GitHub does not know. */
+export function userOf(authorization: string | undefined): User | null {
+  if (authorization === `token ${TOKEN}`) return BOT;
+  if (authorization === `token ${PAT}`) return MAINTAINER;
+  return null;
+}
 
 export interface Comment {
   id: number;
@@ -50,11 +60,16 @@ export class FakeRepo {
   readonly owner = 'o';
   readonly repo = 'r';
   comments: Comment[] = [];
-  pulls = new Map<number, { headSha: string; headRepo: string; baseRef: string }>();
+  pulls = new Map<
+    number,
+    { headSha: string; headRepo: string; baseRef: string; baseSha?: string }
+  >();
   checkRuns: Json[] = [];
   statuses: Json[] = [];
   runs: WorkflowRun[] = [];
   artifacts: Artifact[] = [];
+  /** Committed files: commit sha → path → bytes (contents API). */
+  files = new Map<string, Map<string, Uint8Array>>();
   private nextId = 1000;
   private clock = Date.parse('2026-11-30T10:00:00Z');
 
@@ -118,7 +133,11 @@ export class FakeRepo {
       number,
       requested_teams: [],
       head: { ...head, sha: pull.headSha, repo: headRepo, ref: 'feature' },
-      base: { ...(base['base'] as Json), ref: pull.baseRef },
+      base: {
+        ...(base['base'] as Json),
+        ref: pull.baseRef,
+        ...(pull.baseSha === undefined ? {} : { sha: pull.baseSha }),
+      },
     };
   }
 
@@ -156,11 +175,20 @@ export class FakeRepo {
   install(): this {
     const s = this.server;
     const authed =
-      (handler: (r: FakeRequest) => FakeResponse) =>
-      (r: FakeRequest): FakeResponse =>
-        r.headers.authorization === `token ${TOKEN}`
-          ? handler(r)
-          : apiError(401, 'Bad credentials');
+      (handler: (r: FakeRequest, user: User) => FakeResponse) =>
+      (r: FakeRequest): FakeResponse => {
+        const user = userOf(r.headers.authorization);
+        return user === null ? apiError(401, 'Bad credentials') : handler(r, user);
+      };
+    s.on(
+      'GET /user',
+      authed((_r, user) => {
+        // An installation token may not ask who it is.
+        if (user.type === 'Bot') return apiError(403, 'Resource not accessible by integration');
+        const base = example('private-user');
+        return { status: 200, body: { ...base, login: user.login, type: user.type } };
+      }),
+    );
     s.on(
       'GET /repos/{owner}/{repo}/issues/{issue_number}/comments',
       authed((r) => {
@@ -182,19 +210,23 @@ export class FakeRepo {
     );
     s.on(
       'POST /repos/{owner}/{repo}/issues/{issue_number}/comments',
-      authed((r) => {
-        const comment = this.addComment(String((r.body as Json)['body']), BOT);
+      authed((r, user) => {
+        const body = String((r.body as Json)['body']);
+        if (body.length > 65_536) return apiError(422, 'Validation Failed');
+        const comment = this.addComment(body, user);
         return { status: 201, body: this.commentJson(comment) };
       }),
     );
     s.on(
       'PATCH /repos/{owner}/{repo}/issues/comments/{comment_id}',
-      authed((r) => {
+      authed((r, user) => {
         const comment = this.comments.find((c) => c.id === Number(r.params['comment_id']));
         if (comment === undefined) return apiError(404, 'Not Found');
-        if (comment.user.login !== BOT.login)
+        if (comment.user.login !== user.login)
           return apiError(403, 'Resource not accessible by integration');
-        comment.body = String((r.body as Json)['body']);
+        const body = String((r.body as Json)['body']);
+        if (body.length > 65_536) return apiError(422, 'Validation Failed');
+        comment.body = body;
         return { status: 200, body: this.commentJson(comment) };
       }),
     );
@@ -294,6 +326,53 @@ export class FakeRepo {
         return {
           status: 302,
           headers: { location: `${s.url}/storage/artifacts/${artifact.id}.zip?sig=abc` },
+        };
+      }),
+    );
+    s.on(
+      'GET /repos/{owner}/{repo}/actions/runs/{run_id}',
+      authed((r) => {
+        const run = this.runs.find((x) => x.id === Number(r.params['run_id']));
+        return run === undefined
+          ? apiError(404, 'Not Found')
+          : { status: 200, body: this.runJson(run) };
+      }),
+    );
+    s.on(
+      'GET /repos/{owner}/{repo}/commits/{ref}',
+      authed((r) => {
+        const ref = r.params['ref'] ?? '';
+        const found = [...this.files.keys()].filter(
+          (sha) => sha.startsWith(ref) && ref.length >= 4,
+        );
+        if (found.length !== 1)
+          return apiError(found.length === 0 ? 404 : 422, 'No commit found for SHA: ' + ref);
+        const sha = found[0] ?? '';
+        return {
+          status: 200,
+          body: { ...example<Json>('commit'), sha, node_id: `C_${sha}`, files: [] },
+        };
+      }),
+    );
+    s.on(
+      'GET /repos/{owner}/{repo}/contents/{path}',
+      authed((r) => {
+        const path = r.params['path'] ?? '';
+        const ref = r.url.searchParams.get('ref') ?? '';
+        const bytes = this.files.get(ref)?.get(path);
+        if (bytes === undefined) return apiError(404, 'Not Found');
+        const base = example<Json>('content-file-response-if-content-is-a-file');
+        return {
+          status: 200,
+          body: {
+            ...base,
+            type: 'file',
+            encoding: 'base64',
+            size: bytes.length,
+            name: path.split('/').pop(),
+            path,
+            content: Buffer.from(bytes).toString('base64'),
+          },
         };
       }),
     );

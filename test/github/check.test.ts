@@ -1,5 +1,5 @@
 import { describe, test } from 'vitest';
-import { MAX_CHECK_OUTPUT_CHARS, publishGate } from '../../src/github/check.js';
+import { MAX_CHECK_OUTPUT_CHARS, publishGate } from '../../src/io/github/check.js';
 import { fakeGitHub } from './fixture.js';
 
 const SHA = '2'.repeat(40);

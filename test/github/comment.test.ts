@@ -1,5 +1,5 @@
 import { describe, test } from 'vitest';
-import { MAX_COMMENT_CHARS, isOurs, publishComment } from '../../src/github/comment.js';
+import { MAX_COMMENT_CHARS, isOurs, publishComment } from '../../src/io/github/comment.js';
 import { BOT, PERSON } from '../fake-github/repo.js';
 import { fakeGitHub } from './fixture.js';
 
@@ -102,6 +102,6 @@ test('isOurs: marker with our key and a bot author; a person quoting it never', 
   expect(isOurs(c(`> ${marker()}`, PERSON), 'default')).toBe(false);
   expect(isOurs(c(marker('other')), 'default')).toBe(false);
   expect(isOurs(c('no marker'), 'default')).toBe(false);
-  expect(isOurs(c(marker()), 'default', 'some-app[bot]')).toBe(false);
+  expect(isOurs(c(marker()), 'default', { kind: 'user', login: 'some-app[bot]' })).toBe(false);
   expect(isOurs({ ...c(marker()), user: null }, 'default')).toBe(false);
 });

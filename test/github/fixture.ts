@@ -1,7 +1,7 @@
 /** A fake server, its repository and a real client pointed at it, for in-process module tests. */
 import type { TestContext } from 'vitest';
-import { createClient } from '../../src/github/client.js';
-import type { GitHubClient } from '../../src/github/client.js';
+import { createClient } from '../../src/io/github/client.js';
+import type { GitHubClient } from '../../src/io/github/client.js';
 import { FakeRepo, TOKEN } from '../fake-github/repo.js';
 import { FakeGitHub } from '../fake-github/server.js';
 

@@ -1,8 +1,8 @@
 import { strToU8, zipSync } from 'fflate';
 import { describe, expect, test } from 'vitest';
-import { pickRunFiles } from '../../src/github/artifacts.js';
-import { InputError } from '../../src/errors.js';
-import { listEntries, readEntry, unsafeName } from '../../src/github/zip.js';
+import { pickRunFiles } from '../../src/io/github/artifacts.js';
+import { InputError } from '../../src/model/errors.js';
+import { listEntries, readEntry, unsafeName } from '../../src/io/github/zip.js';
 
 const RUN = JSON.stringify({
   format: 'fitgap-run/1',
@@ -101,6 +101,55 @@ describe('readEntry', () => {
     expect(
       message(() => readEntry(zip, { ...entry!, size: 3 }, { remaining: 1e6, limit: 1e6 }, label)),
     ).toContain(`must hold 3 bytes in "run.json" as its directory says (got ${RUN.length})`);
+  });
+});
+
+describe('corrupt archives', () => {
+  test('a corrupt deflate stream is refused with the archive and the entry named', () => {
+    const zip = zipSync({ 'run.json': strToU8(RUN.repeat(50)) });
+    const [entry] = listEntries(zip, label);
+    const start = entry!.localOffset + 30 + 'run.json'.length;
+    const broken = zip.slice();
+    // Block type 3 (reserved) in the first deflate header: invalid data from the first byte.
+    broken[start] = 0xff;
+    expect(message(() => readEntry(broken, entry!, { remaining: 1e6, limit: 1e6 }, label))).toMatch(
+      /^artifact "base" must hold readable data in "run\.json" \(got invalid deflate data/,
+    );
+  });
+
+  test('a stored entry shorter than its directory says is refused', () => {
+    const zip = zipSync({ 'run.json': [strToU8(RUN), { level: 0 }] });
+    const [entry] = listEntries(zip, label);
+    expect(
+      message(() =>
+        readEntry(
+          zip.subarray(0, zip.length),
+          { ...entry!, compressedSize: 5 },
+          { remaining: 1e6, limit: 1e6 },
+          label,
+        ),
+      ),
+    ).toContain(
+      'must hold readable data in "run.json" (got 5 stored bytes where its directory says',
+    );
+  });
+
+  test('random damage never escapes as anything but a refusal', () => {
+    const zip = zipSync({
+      'run.json': strToU8(RUN.repeat(20)),
+      'p.csv': strToU8('id,correct\n1,1\n'),
+    });
+    for (let seed = 0; seed < 300; seed++) {
+      const broken = zip.slice();
+      const at = (seed * 7919) % broken.length;
+      broken[at] = (broken[at] ?? 0) ^ (1 + (seed % 255));
+      try {
+        for (const entry of listEntries(broken, label))
+          readEntry(broken, entry, { remaining: 1e6, limit: 1e6 }, label);
+      } catch (error) {
+        expect(error).toBeInstanceOf(InputError);
+      }
+    }
   });
 });
 

@@ -7,7 +7,7 @@
 import mermaid from 'mermaid';
 import { describe, expect, it } from 'vitest';
 import { renderMarkdown } from '../../src/report/index.js';
-import { reviewFiles } from '../../src/review-files.js';
+import { reviewFiles } from '../../src/io/review-from-files.js';
 import { mermaidBlocks, rawHtml, tableShapes, toDocument } from './gfm.js';
 
 describe.each(['1-interactions', '2-lambda-3', '3-more-data'])('demo %s comment', (name) => {

@@ -7,6 +7,7 @@ it('exports exactly the public API', () => {
     'GITHUB_COMMENT_LIMIT',
     'buildMarker',
     'escapeInline',
+    'gateReasonLines',
     'isValidCommentKey',
     'mermaidLabel',
     'parseMarker',

@@ -18,6 +18,7 @@ describe('renderJson', () => {
     expect(doc.validation?.change).toBe('worse');
     for (const key of ['bias', 'variance'] as const) {
       expect(Object.keys(doc[key]?.delta as object)).toEqual([
+        'unit',
         'estimate',
         'ci',
         'p',
@@ -27,7 +28,10 @@ describe('renderJson', () => {
     }
     expect(doc.baseline?.diagnosis).toBe('high-bias');
     expect(doc.candidate?.diagnosis).toBe('high-variance');
+    expect((doc.bias?.delta as { unit: string }).unit).toBe('shortfall');
+    expect((doc.validation?.delta as { unit: string }).unit).toBe('metric');
     expect(Object.keys(doc.gate ?? {})).toEqual(['pass', 'reasons', 'failOn']);
+    expect(doc.gate?.reasons).toEqual([{ outcome: 'worse-validation' }]);
   });
 
   it('keeps hostile text as data (JSON escaping is enough there)', () => {

@@ -1,7 +1,7 @@
 import fc from 'fast-check';
 import { markdownTable } from 'markdown-table';
 import { describe, expect, it } from 'vitest';
-import type { Review } from '../../src/analysis/types.js';
+import type { Review } from '../../src/model/review.js';
 import { escapeInline, plainText } from '../../src/report/escape.js';
 import { renderMarkdown } from '../../src/report/markdown.js';
 import { parseMarker } from '../../src/report/marker.js';
@@ -66,7 +66,7 @@ describe('renderMarkdown', () => {
     expect(shapes).toEqual([
       [5, 7], // splits: header + train, train-dev, validation, test
       [6, 7], // decomposition: header + 4 components + diagnosis
-      [5, 4], // levers
+      [5, 3], // levers
       [15, 7], // slices: header + 14
       [7, 4], // hyperparameters
       [3, 4], // provenance: runs
@@ -83,7 +83,7 @@ describe('renderMarkdown', () => {
       'p',
       'Reading',
     ]);
-    expect(headers[2]).toEqual(['#', 'Lever', 'Why', 'Evidence']);
+    expect(headers[2]).toEqual(['#', 'Lever', 'Why']);
   });
 
   it('bakery: the headline says movement, validation with interval and p, gate and first lever', () => {
@@ -96,9 +96,11 @@ describe('renderMarkdown', () => {
     expect(items[1]).toBe(
       "Validation mae_loaves worse: 6.050 → 6.380 (Δ +0.330, 95% interval [+0.120, +0.540], p = 0.006, Welch's t-test).",
     );
-    expect(items[2]).toBe('Gate failed: validation got significantly worse.');
-    expect(items[3]).toMatch(
-      /^Next lever: Stop training earlier: Validation error was lowest at epoch 31/,
+    expect(items[2]).toBe('Gate failed: worse-validation: validation got significantly worse.');
+    expect(items[3]).toBe(
+      'Next lever: Stop training earlier: The candidate has high variance: 1.290 against a ' +
+        'validation error of 6.380. Validation was best at epoch 31 of 80; stopping there saves ' +
+        '0.348 (generalization loss 5.8%).',
     );
   });
 

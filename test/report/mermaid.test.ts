@@ -4,7 +4,7 @@
 // one, so the package's own parser runs unchanged.
 import mermaid from 'mermaid';
 import { describe, expect, it } from 'vitest';
-import type { Review } from '../../src/analysis/types.js';
+import type { Review } from '../../src/model/review.js';
 import { renderMarkdown } from '../../src/report/markdown.js';
 import { buildCharts, curveCharts, interpolate, planeChart } from '../../src/report/mermaid.js';
 import { bakeryReview } from '../fixtures/report/bakery.js';

@@ -8,13 +8,14 @@
 import mermaid from 'mermaid';
 import { describe, expect, it } from 'vitest';
 import { buildReview } from '../../src/analysis/review.js';
-import type { Review } from '../../src/analysis/types.js';
+import type { Review } from '../../src/model/review.js';
 import { renderJson } from '../../src/report/json.js';
 import { renderMarkdown } from '../../src/report/markdown.js';
 import { renderText } from '../../src/report/text.js';
 import { bakeryArtifacts } from '../fixtures/report/artifacts.js';
 import { HOSTILE } from '../fixtures/report/hostile.js';
 import { mermaidBlocks, rawHtml, tableShapes, toDocument } from './gfm.js';
+import { expectValidReport } from './valid-review.js';
 
 function review(hostile = false): Review {
   const { baseline, candidate } = bakeryArtifacts();
@@ -55,6 +56,7 @@ describe('report of a review built by the analysis', () => {
         expect(Array.from(line).length).toBeLessThanOrEqual(80);
       }
       expect(JSON.parse(renderJson(r)).format).toBe('fitgap-review/1');
+      expectValidReport(r);
     },
   );
 

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import type { Review } from '../../src/analysis/types.js';
+import type { Review } from '../../src/model/review.js';
 import { renderText, textTable, wrap } from '../../src/report/text.js';
 import { bakeryReview } from '../fixtures/report/bakery.js';
 import { deliveryReview } from '../fixtures/report/delivery.js';
@@ -57,6 +57,29 @@ describe('renderText', () => {
     expect(lines).toContain(
       '  Avoidable bias        1.100*      0.420  −0.680  [−0.790, −0.570]  better',
     );
+    expect(lines).toContain(
+      '  Diagnosis: baseline high bias (underfitting); candidate high variance',
+    );
+  });
+
+  it('delivery: a proportion in percent, its changes in points, everywhere', () => {
+    const text = renderText(deliveryReview(), { color: false });
+    expect(text).toContain(
+      '* Validation late_call_error_rate better: 17.10% → 13.10% (Δ −4.00 pts, 95%',
+    );
+    expect(text).toContain('  Values in percent; Δ and intervals in percentage points.');
+    expect(text).toContain(
+      '  validation     17.10      13.10  −4.00  [−4.90, −3.10]  < 0.001  better',
+    );
+    expect(text).toContain('  Components, Δ and intervals in percentage points.');
+    expect(text).toContain(
+      '  Avoidable bias         9.20*      4.80*  −4.40  [−4.70, −4.10]  better',
+    );
+    expect(text.replace(/\n\s*/g, ' ')).toContain(
+      'Validation error exceeds train-dev error by 2.20 pts',
+    );
+    // One minus sign: U+2212 in every number, never a hyphen-minus before a digit.
+    expect(text).not.toMatch(/(^|[\s([])-\d/m);
   });
 });
 

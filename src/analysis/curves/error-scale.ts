@@ -11,7 +11,7 @@
  * - continuous minimized: [0, ∞) when every value is ≥ 0 (a non-negative loss, the usual case),
  *   unbounded otherwise; continuous negated: unbounded.
  */
-import type { Goal, MetricKind } from '../../artifact/types.js';
+import type { Goal, MetricKind } from '../../model/run.js';
 
 export interface ErrorScale {
   convention: 'identity' | 'one-minus' | 'negate';

@@ -8,13 +8,13 @@
  * otherwise (error-scale.ts). Power-law parameters a, b, c and the residual are in those error
  * units; every value reported back (projections, best/final validation, charts) is in metric units.
  */
-import type { CurvePoint, Curves, Goal, MetricKind } from '../../artifact/types.js';
+import type { CurvePoint, Curves, Goal, MetricKind } from '../../model/run.js';
 import type { Interval } from '../../stats/types.js';
 import { epochVerdict } from './early-stopping.js';
 import { errorScale, type ErrorScale } from './error-scale.js';
 import { gapTrend } from './gap-trend.js';
 import { downsampleKeeping } from './lttb.js';
-import { fitPowerLaw } from './power-law.js';
+import { MIN_POWER_LAW_POINTS, fitPowerLaw } from './power-law.js';
 import { regularizationMinimum } from './regularization.js';
 import type {
   CurvesReport,
@@ -22,13 +22,16 @@ import type {
   EpochsEvidence,
   LearningCurveEvidence,
   RegularizationEvidence,
-} from './types.js';
+} from '../../model/curves.js';
 
-export type * from './types.js';
+export type * from '../../model/curves.js';
 export { fitLeastSquares } from './levenberg-marquardt.js';
 export type { LeastSquaresFit, LeastSquaresProblem } from './levenberg-marquardt.js';
 export { generalizationLoss, progressQuotient, trainingProgress } from './early-stopping.js';
 export { downsampleKeeping, lttbIndices } from './lttb.js';
+
+/** An epoch curve needs a best and a final point. */
+const MIN_EPOCH_POINTS = 2;
 
 /** Charts carry at most this many points (LTTB). */
 export const CHART_POINTS = 60;
@@ -83,7 +86,8 @@ function analyzeEpochs(
   points: readonly CurvePoint[],
   scale: ErrorScale,
 ): EpochsEvidence | CurveSkipped {
-  if (points.length < 2) return { skipped: `needs at least 2 points, has ${points.length}` };
+  if (points.length < MIN_EPOCH_POINTS)
+    return { skipped: 'too-few-points', points: points.length, needs: MIN_EPOCH_POINTS };
   const validation = points.map((p) => scale.toError(p.validation));
   const hasTrain = points.every((p) => p.train !== undefined);
   const train = hasTrain ? points.map((p) => scale.toError(p.train as number)) : null;
@@ -115,8 +119,14 @@ function analyzeLearningCurve(
 ): LearningCurveEvidence | CurveSkipped {
   const m = points.map((p) => p.x);
   const e = points.map((p) => scale.toError(p.validation));
+  const tooFew = {
+    skipped: 'too-few-points',
+    points: m.length,
+    needs: MIN_POWER_LAW_POINTS,
+  } as const;
+  if (m.length < MIN_POWER_LAW_POINTS) return tooFew;
   const fit = fitPowerLaw(m, e, { lower: scale.lower, upper: scale.upper });
-  if ('skipped' in fit) return fit;
+  if ('skipped' in fit) return { ...tooFew, skipped: 'fit-failed' };
   const gap = gapTrend(
     points.map((p) =>
       p.train === undefined

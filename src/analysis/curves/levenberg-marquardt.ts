@@ -2,13 +2,12 @@
  * Nonlinear least squares by Levenberg–Marquardt, with box bounds, an honest convergence verdict
  * and the parameter covariance s²·(JᵀJ)⁻¹ for intervals.
  *
- * Why our own instead of `ml-levenberg-marquardt` (installed, v5.1.0): that library has no
- * convergence test — it stops when the RSS falls below an absolute `errorTolerance` or at
- * `maxIterations`, so a stall and a fit look the same — its damping is additive (λI, not scaled
- * to the Jacobian columns) and its finite-difference step is absolute, so results depend on the
- * units of the parameters (with its defaults, NIST Misra1a from start 1 ends with b2 off by a
- * factor of ~4400 after 100 iterations), and it returns no covariance. Measured side by side when
- * this file was written; see the report of issue 5.
+ * Why our own instead of the `ml-levenberg-marquardt` package (v5.1.0): it has no convergence
+ * test — it stops when the RSS falls below an absolute `errorTolerance` or at `maxIterations`, so a
+ * stall and a fit look the same — its damping is additive (λI, not scaled to the Jacobian columns)
+ * and its finite-difference step is absolute, so results depend on the units of the parameters
+ * (with its defaults, NIST Misra1a from start 1 ends with b2 off by a factor of ~4400 after 100
+ * iterations), and it returns no covariance.
  *
  * Method (common practice, after Moré (1978) / MINPACK `lmder`; citations from memory):
  * - residuals r = y − f(x; p); step from the damped problem min ‖J δ − r‖² + μ‖D δ‖², solved by QR

@@ -13,6 +13,8 @@
  *   grid step in ln x (finer than the sweep can resolve).
  * Needs x > 0 (log axis) and at least 3 points.
  */
+import type { CurveSkipped } from '../../model/curves.js';
+
 export const MIN_REGULARIZATION_POINTS = 3;
 
 export interface RegularizationResult {
@@ -29,10 +31,10 @@ export function regularizationMinimum(
   x: readonly number[],
   validationError: readonly number[],
   lambda: number | undefined,
-): RegularizationResult | { skipped: string } {
+): RegularizationResult | CurveSkipped {
   const n = x.length;
   if (n < MIN_REGULARIZATION_POINTS) {
-    return { skipped: `needs at least ${MIN_REGULARIZATION_POINTS} points, has ${n}` };
+    return { skipped: 'too-few-points', points: n, needs: MIN_REGULARIZATION_POINTS };
   }
   let i = 0;
   validationError.forEach((v, j) => {

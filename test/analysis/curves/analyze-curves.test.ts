@@ -1,14 +1,14 @@
 import { readFileSync } from 'node:fs';
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import type { CurvePoint } from '../../../src/artifact/types.js';
+import type { CurvePoint } from '../../../src/model/run.js';
 import * as curves from '../../../src/analysis/curves/index.js';
 import { analyzeCurves, CHART_POINTS } from '../../../src/analysis/curves/index.js';
 import type {
   EpochsEvidence,
   LearningCurveEvidence,
   RegularizationEvidence,
-} from '../../../src/analysis/curves/types.js';
+} from '../../../src/model/curves.js';
 import { fixturePath } from './nist-fixtures.js';
 
 const minimizeProportion = { kind: 'proportion', goal: 'minimize' } as const;
@@ -54,7 +54,7 @@ describe('analyzeCurves', () => {
     expect(Object.keys(r)).toEqual(['epochs']);
   });
 
-  it('carries the JSON report keys of issue 5', () => {
+  it('carries the curve keys of the JSON report', () => {
     const ref = JSON.parse(
       readFileSync(fixturePath('scipy-power-law-crosscheck.json'), 'utf8'),
     ) as {
@@ -194,9 +194,9 @@ describe('analyzeCurves', () => {
       minimizeProportion,
     );
     expect(r).toEqual({
-      epochs: { skipped: 'needs at least 2 points, has 1' },
-      training_examples: { skipped: 'needs at least 4 points, has 3' },
-      regularization: { skipped: 'needs at least 3 points, has 1' },
+      epochs: { skipped: 'too-few-points', points: 1, needs: 2 },
+      training_examples: { skipped: 'too-few-points', points: 3, needs: 4 },
+      regularization: { skipped: 'too-few-points', points: 1, needs: 3 },
     });
   });
 });

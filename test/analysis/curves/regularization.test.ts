@@ -47,7 +47,9 @@ describe('regularizationMinimum', () => {
 
   it('needs three points', () => {
     expect(regularizationMinimum([0.1, 1], [0.2, 0.1], 1)).toEqual({
-      skipped: 'needs at least 3 points, has 2',
+      skipped: 'too-few-points',
+      points: 2,
+      needs: 3,
     });
   });
 

@@ -1,0 +1,65 @@
+/** One run's summary: split means with intervals, error components, diagnosis, curves. Pure. */
+import type { RunArtifact, SplitName } from '../model/run.js';
+import { SPLIT_NAMES } from '../model/run.js';
+import { mean, sampleVariance, tQuantile, wilsonInterval } from '../stats/index.js';
+import type { Interval } from '../stats/types.js';
+import { analyzeCurves } from './curves/index.js';
+import { chooseReference, decompose, diagnose, errorLevel } from './decompose.js';
+import { knobOf } from './hyperparameters.js';
+import type { RunSummary, SplitSummary } from '../model/review.js';
+
+export interface SummarySettings {
+  alpha: number;
+  minEffect: number;
+  gapTolerance: number;
+  reference?: number;
+}
+
+function splitSummary(run: RunArtifact, split: SplitName, alpha: number): SplitSummary | null {
+  const s = run.splits[split];
+  if (s === undefined) return null;
+  const m = mean(s.values);
+  const n = s.values.length;
+  const sd = n >= 2 ? Math.sqrt(sampleVariance(s.values)) : null;
+  let ci: Interval | null = null;
+  if (sd !== null) {
+    const half = tQuantile(1 - alpha / 2, n - 1) * (sd / Math.sqrt(n));
+    ci = [m - half, m + half];
+  } else if (run.metric.kind === 'proportion' && s.examples !== undefined) {
+    ci = wilsonInterval(Math.round(m * s.examples), s.examples, alpha);
+  }
+  return { split, mean: m, sd, repeats: n, examples: s.examples ?? null, ci };
+}
+
+/** The run's regularization strength (a weight penalty; dropout is not one), if it names one. */
+export function regularizationOf(run: RunArtifact): { key: string; value: number } | undefined {
+  for (const [key, value] of Object.entries(run.hyperparameters ?? {})) {
+    if (typeof value === 'number' && knobOf(key) === 'regularization' && !/dropout/i.test(key))
+      return { key, value };
+  }
+  return undefined;
+}
+
+export function summarize(run: RunArtifact, settings: SummarySettings): RunSummary {
+  const reference = chooseReference(run, settings.reference);
+  const components = decompose(run, reference.value, settings);
+  const lambda = regularizationOf(run)?.value;
+  return {
+    name: run.run.name,
+    commit: run.run.commit ?? null,
+    createdAt: run.run.createdAt ?? null,
+    reference: reference.value,
+    referenceSource: reference.source,
+    splits: SPLIT_NAMES.flatMap((s) => splitSummary(run, s, settings.alpha) ?? []),
+    errorLevel: errorLevel(run),
+    components,
+    diagnosis: diagnose(components),
+    biasUnknown: reference.value === null,
+    warnings: components.overfit.present ? ['validation-overfit'] : [],
+    curves: analyzeCurves(run.curves, {
+      ...(lambda === undefined ? {} : { lambda }),
+      kind: run.metric.kind,
+      goal: run.metric.goal,
+    }),
+  };
+}

@@ -1,0 +1,141 @@
+/**
+ * Turns the series of a training log into a run artifact's curve: picks the training and
+ * validation series, converts them into the metric's units, and merges them by x.
+ *
+ * Repeated x (Lightning logs several steps per epoch; a resumed run logs an epoch twice): with
+ * `duplicates: 'average'` (the default) the values of one series at one x are replaced by their
+ * mean, points are sorted by x, and a warning says how many x were merged; with `'reject'`, x must
+ * strictly increase in the order of the file, as a hand-written curve must. A curve point needs a
+ * validation value, so training values at an x without one are left out (counted in a warning).
+ * The result meets the artifact's rules: finite numbers, x strictly increasing, at least one point.
+ */
+import { InputError } from '../../model/errors.js';
+import type { CurvePoint } from '../../model/run.js';
+import { pickSeries, type Catalogue, type PickOptions } from './picker.js';
+import { pointerOf, type CurveLogWarning, type ReadResult, type Series } from './types.js';
+import { convert, unitsFor } from './units.js';
+
+export interface CurveOptions extends PickOptions {
+  duplicates?: 'average' | 'reject';
+}
+
+export interface ImportedCurve {
+  points: CurvePoint[];
+  validation: string;
+  train?: string;
+  /** `flags`: the caller named the series; `names`: they were picked by name. */
+  by: 'flags' | 'names';
+  /** What x counts (`epoch`, `step`, `round`, or the CSV column). */
+  x: string;
+  /** Files the two series came from. */
+  files: string[];
+  /** Other validation series that could have been picked. */
+  alternatives: string[];
+  warnings: CurveLogWarning[];
+}
+
+function collapse(
+  series: Series,
+  mode: 'average' | 'reject',
+  warnings: CurveLogWarning[],
+): Map<number, number> {
+  if (series.problems.length > 0) throw new InputError(series.problems);
+  // Running means: no overflow for values near the largest double.
+  const means = new Map<number, { mean: number; n: number }>();
+  let previous: number | undefined;
+  for (const p of series.points) {
+    if (mode === 'reject' && previous !== undefined && !(p.x > previous)) {
+      throw new InputError([
+        {
+          file: series.file,
+          pointer: pointerOf(series.where, p.at),
+          expected: `"${series.x}" must strictly increase (previous ${previous})`,
+          got: String(p.x),
+        },
+      ]);
+    }
+    previous = p.x;
+    const entry = means.get(p.x);
+    if (entry === undefined) means.set(p.x, { mean: p.value, n: 1 });
+    else {
+      entry.n++;
+      entry.mean += p.value / entry.n - entry.mean / entry.n;
+    }
+  }
+  let merged = 0;
+  const out = new Map<number, number>();
+  for (const [x, { mean, n }] of means) {
+    if (n > 1) merged++;
+    out.set(x, mean);
+  }
+  if (merged > 0) warnings.push({ code: 'duplicates-averaged', series: series.name, xs: merged });
+  return out;
+}
+
+export function buildCurve(
+  read: ReadResult,
+  catalogue: Catalogue,
+  options: CurveOptions = {},
+): ImportedCurve {
+  const picked = pickSeries(read.series, options, catalogue);
+  const warnings: CurveLogWarning[] = [...read.warnings, ...picked.warnings];
+  const mode = options.duplicates ?? 'average';
+  const { validation, train } = picked;
+  const units = unitsFor(picked.base, validation.name, options.metric);
+  if (units.warning !== undefined) warnings.push(units.warning);
+  const conversion = units.conversion;
+  const toMetric = (v: number): number => {
+    if (conversion === undefined) return v;
+    const converted = convert(conversion, v);
+    if (!Number.isFinite(converted))
+      throw new InputError([
+        {
+          file: validation.file,
+          pointer: '',
+          expected: `must have values that stay finite in the metric's units (${conversion})`,
+          got: String(v),
+        },
+      ]);
+    return converted;
+  };
+
+  const validationByX = collapse(validation, mode, warnings);
+  const trainByX = train === undefined ? undefined : collapse(train, mode, warnings);
+  if (validationByX.size === 0) {
+    throw new InputError([
+      {
+        file: validation.file,
+        pointer: '',
+        expected: `must have at least one value of "${validation.name}"`,
+        hint: 'Check that the run got as far as a validation pass, or name another series.',
+      },
+    ]);
+  }
+  const xs = [...validationByX.keys()].sort((a, b) => a - b);
+  let missing = 0;
+  const points: CurvePoint[] = xs.map((x) => {
+    const point: CurvePoint = { x, validation: toMetric(validationByX.get(x) as number) };
+    const t = trainByX?.get(x);
+    if (t !== undefined) point.train = toMetric(t);
+    else if (trainByX !== undefined) missing++;
+    return point;
+  });
+  if (train !== undefined && trainByX !== undefined) {
+    if (missing > 0) warnings.push({ code: 'train-missing', series: train.name, points: missing });
+    let dropped = 0;
+    for (const x of trainByX.keys()) if (!validationByX.has(x)) dropped++;
+    if (dropped > 0)
+      warnings.push({ code: 'train-only-dropped', series: train.name, points: dropped });
+  }
+  const files = [...new Set([validation.file, ...(train === undefined ? [] : [train.file])])];
+  return {
+    points,
+    validation: validation.name,
+    ...(train === undefined ? {} : { train: train.name }),
+    by: picked.by,
+    x: validation.x,
+    files,
+    alternatives: picked.alternatives,
+    warnings,
+  };
+}
