@@ -181,10 +181,11 @@ function reviewNotes(facts: {
 
 function pairedSummary(paired: PairedPredictions | undefined): Review['paired'] {
   if (paired === undefined) return null;
-  if (paired.kind === 'continuous') return { rows: paired.rows, test: 'paired-t' };
+  if (paired.kind === 'continuous') return { rows: paired.rows, test: 'paired-t', reason: null };
   return {
     rows: paired.rows,
     test: 'mcnemar-exact',
+    reason: null,
     discordant: {
       baselineOnly: paired.baselineOnly ?? 0,
       candidateOnly: paired.candidateOnly ?? 0,

@@ -58,7 +58,9 @@ describe('review properties', () => {
           ),
         );
         expect(forward.validation.change).toBe(
-          { better: 'worse', worse: 'better', flat: 'flat' }[backward.validation.change],
+          { better: 'worse', worse: 'better', flat: 'flat', undetermined: 'undetermined' }[
+            backward.validation.change
+          ],
         );
       }),
       { numRuns: 300 },
