@@ -4,7 +4,14 @@ import { SPLIT_NAMES } from '../model/run.js';
 import { mean, sampleVariance, tQuantile, wilsonInterval } from '../stats/index.js';
 import type { Interval } from '../stats/types.js';
 import { analyzeCurves } from './curves/index.js';
-import { chooseReference, decompose, diagnose, errorLevel } from './decompose.js';
+import {
+  chooseReference,
+  decompose,
+  diagnose,
+  errorLevel,
+  type ReferenceChoice,
+} from './decompose.js';
+import type { ExampleNoise } from './measure.js';
 import { knobOf } from './hyperparameters.js';
 import type { RunSummary, SplitSummary } from '../model/review.js';
 
@@ -13,6 +20,8 @@ export interface SummarySettings {
   minEffect: number;
   gapTolerance: number;
   reference?: number;
+  /** The reference chosen for both runs (taskReference); overrides `reference`. */
+  referenceChoice?: ReferenceChoice;
 }
 
 function splitSummary(run: RunArtifact, split: SplitName, alpha: number): SplitSummary | null {
@@ -40,9 +49,22 @@ export function regularizationOf(run: RunArtifact): { key: string; value: number
   return undefined;
 }
 
-export function summarize(run: RunArtifact, settings: SummarySettings): RunSummary {
-  const reference = chooseReference(run, settings.reference);
-  const components = decompose(run, reference.value, settings);
+/**
+ * Training error significantly below the reference (negative avoidable bias): memorising noise,
+ * or a wrong reference. Flagged also when its noise is unknown.
+ */
+function belowReference(bias: RunSummary['components']['bias'], alpha: number): boolean {
+  if (bias.value === null || !(bias.value < 0)) return false;
+  return bias.p === null || 1 - bias.p < alpha;
+}
+
+export function summarize(
+  run: RunArtifact,
+  settings: SummarySettings,
+  examples: ExampleNoise = {},
+): RunSummary {
+  const reference = settings.referenceChoice ?? chooseReference(run, settings.reference);
+  const components = decompose(run, reference.value, settings, examples);
   const lambda = regularizationOf(run)?.value;
   return {
     name: run.run.name,
@@ -55,7 +77,10 @@ export function summarize(run: RunArtifact, settings: SummarySettings): RunSumma
     components,
     diagnosis: diagnose(components),
     biasUnknown: reference.value === null,
-    warnings: components.overfit.present ? ['validation-overfit'] : [],
+    warnings: [
+      ...(components.overfit.present ? (['validation-overfit'] as const) : []),
+      ...(belowReference(components.bias, settings.alpha) ? (['below-reference'] as const) : []),
+    ],
     curves: analyzeCurves(run.curves, {
       ...(lambda === undefined ? {} : { lambda }),
       kind: run.metric.kind,
