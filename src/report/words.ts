@@ -37,7 +37,7 @@ export const MOVEMENT_TITLE = words<Movement>({
   'no-significant-change': 'no change beyond noise',
   'toward-underfitting': 'toward underfitting',
   'worse-on-both': 'more bias and more variance',
-  undetermined: 'cannot tell',
+  undetermined: 'cannot tell: no noise estimate',
 });
 
 export const MOVEMENT_SENTENCE = words<Movement>({
