@@ -68,7 +68,8 @@ export function splitSampling(
   const s = run.splits[split];
   if (s === undefined) return null;
   if (run.metric.kind === 'proportion' && s.examples !== undefined) {
-    const rate = Math.min(1, Math.max(0, mean(s.values)));
+    // A rate over N examples is a count over N: round to it (so 1e-300 is 0, not noiseless).
+    const rate = Math.round(Math.min(1, Math.max(0, mean(s.values))) * s.examples) / s.examples;
     return binomialSamplingVariance(rate, s.examples);
   }
   return examples[split] ?? null;

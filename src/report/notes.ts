@@ -4,7 +4,7 @@
  */
 import type { Note, NonLever, Review, RunWarning, UnavailableCode } from '../model/review.js';
 import type { Escape } from './escape.js';
-import { amount, count, type NumberFormat } from './format.js';
+import { amount, count, value, type NumberFormat } from './format.js';
 import { COMPONENT_ORDER, COMPONENT_TITLE, SPLIT_WORD, say, type Words } from './words.js';
 
 /** Names listed in a note, and "…" when there were more. */
@@ -27,9 +27,9 @@ export function noteSentence(note: Note, review: Review, f: NumberFormat, esc: E
     case 'noise-unknown':
       return 'Cannot tell: run-to-run noise is unknown (one repeat, or identical repeats, of a continuous metric without per-example predictions), so changes it touches are undetermined, whatever their size. Repeat each run with at least 2 seeds, or add per-example predictions.';
     case 'reference-from-one-run':
-      return `Only the ${note.from} states a reference (${amount(note.value, f)}): it is used for both runs, since the reference is a property of the task.`;
+      return `Only the ${note.from} states a reference (${value(note.value, f)}): it is used for both runs, since the reference is a property of the task.`;
     case 'references-differ':
-      return `Warning: the runs state different references (baseline ${amount(note.baseline, f)}, candidate ${amount(note.candidate, f)}); the candidate's is used for both, so the bias change is the change of training error.`;
+      return `Warning: the runs state different references (baseline ${value(note.baseline, f)}, candidate ${value(note.candidate, f)}); the candidate's is used for both, so the bias change is the change of training error.`;
     case 'noise-from-evaluation-set':
       return `The noise includes the evaluation set's sampling noise (${note.source === 'binomial' ? 'binomial' : 'from per-example values'}), which repeats on fixed rows do not show.`;
     case 'predictions-partial-overlap':

@@ -152,7 +152,7 @@ describe('note sentences', () => {
   it('says cannot tell when the noise is unknown, whatever min-effect', () => {
     expect(say1({ code: 'noise-unknown' })).toMatch(/^Cannot tell: run-to-run noise is unknown/);
     expect(say1({ code: 'reference-from-one-run', from: 'baseline', value: 0.02 })).toBe(
-      'Only the baseline states a reference (2.00 pts): it is used for both runs, since the reference is a property of the task.',
+      'Only the baseline states a reference (2.00%): it is used for both runs, since the reference is a property of the task.',
     );
   });
 
