@@ -185,7 +185,7 @@ function reproduceIssues(run: LoadedRun, side: { n: number; mean: number }): Iss
     {
       file: run.file,
       pointer,
-      expected: `must agree with its predictions (${ref.path}): ${what} is ${computed}, the artifact states ${stated}`,
+      expected: `must agree with its predictions (${ref.path}): ${what} is ${Number(computed.toPrecision(6))}, the artifact states ${stated}`,
       got: String(stated),
       hint: 'The predictions must be for this run and this repeat (set predictions.repeat), and for a continuous metric predictions.aggregate must say how loss aggregates to the value.',
     },
