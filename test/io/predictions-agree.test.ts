@@ -56,3 +56,22 @@ describe('predictions must agree with the artifact', () => {
     await expect(reviewFiles({ baseline: b, candidate: c })).rejects.toBeInstanceOf(InputError);
   });
 });
+
+describe('the metric scale', () => {
+  it('refuses a maximized metric above 1 without metric.best, with a hint', async () => {
+    const dir = mkdtempSync(join(tmpdir(), 'fitgap-best-'));
+    const path = join(dir, 'run.json');
+    writeFileSync(
+      path,
+      JSON.stringify({
+        format: 'fitgap-run/1',
+        run: { name: 'bleu' },
+        metric: { name: 'bleu', goal: 'maximize', kind: 'continuous' },
+        splits: { train: { values: [99.9] }, validation: { values: [99.76] } },
+      }),
+    );
+    const error = await reviewFiles({ baseline: path, candidate: path }).catch((e: unknown) => e);
+    expect(error).toBeInstanceOf(InputError);
+    expect(String((error as InputError).message)).toMatch(/metric\.best/);
+  });
+});
