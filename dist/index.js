@@ -15770,8 +15770,8 @@ var require_cache = __commonJS({
        * @returns {requestResponseList}
        */
       #batchCacheOperations(operations) {
-        const cache = this.#relevantRequestResponseList;
-        const backupCache = [...cache];
+        const cache2 = this.#relevantRequestResponseList;
+        const backupCache = [...cache2];
         const addedItems = [];
         const resultList = [];
         try {
@@ -15798,9 +15798,9 @@ var require_cache = __commonJS({
                 return [];
               }
               for (const requestResponse of requestResponses) {
-                const idx = cache.indexOf(requestResponse);
+                const idx = cache2.indexOf(requestResponse);
                 assert(idx !== -1);
-                cache.splice(idx, 1);
+                cache2.splice(idx, 1);
               }
             } else if (operation.type === "put") {
               if (operation.response == null) {
@@ -15830,11 +15830,11 @@ var require_cache = __commonJS({
               }
               requestResponses = this.#queryCache(operation.request);
               for (const requestResponse of requestResponses) {
-                const idx = cache.indexOf(requestResponse);
+                const idx = cache2.indexOf(requestResponse);
                 assert(idx !== -1);
-                cache.splice(idx, 1);
+                cache2.splice(idx, 1);
               }
-              cache.push([operation.request, operation.response]);
+              cache2.push([operation.request, operation.response]);
               addedItems.push([operation.request, operation.response]);
             }
             resultList.push([operation.request, operation.response]);
@@ -16008,13 +16008,13 @@ var require_cachestorage = __commonJS({
         if (options.cacheName != null) {
           if (this.#caches.has(options.cacheName)) {
             const cacheList = this.#caches.get(options.cacheName);
-            const cache = new Cache(kConstruct, cacheList);
-            return await cache.match(request2, options);
+            const cache2 = new Cache(kConstruct, cacheList);
+            return await cache2.match(request2, options);
           }
         } else {
           for (const cacheList of this.#caches.values()) {
-            const cache = new Cache(kConstruct, cacheList);
-            const response = await cache.match(request2, options);
+            const cache2 = new Cache(kConstruct, cacheList);
+            const response = await cache2.match(request2, options);
             if (response !== void 0) {
               return response;
             }
@@ -16044,12 +16044,12 @@ var require_cachestorage = __commonJS({
         webidl.argumentLengthCheck(arguments, 1, prefix);
         cacheName = webidl.converters.DOMString(cacheName, prefix, "cacheName");
         if (this.#caches.has(cacheName)) {
-          const cache2 = this.#caches.get(cacheName);
-          return new Cache(kConstruct, cache2);
+          const cache3 = this.#caches.get(cacheName);
+          return new Cache(kConstruct, cache3);
         }
-        const cache = [];
-        this.#caches.set(cacheName, cache);
-        return new Cache(kConstruct, cache);
+        const cache2 = [];
+        this.#caches.set(cacheName, cache2);
+        return new Cache(kConstruct, cache2);
       }
       /**
        * @see https://w3c.github.io/ServiceWorker/#cache-storage-delete
@@ -42462,9 +42462,9 @@ var init_endpoints_to_methods = __esm({
       set(target, methodName, value2) {
         return target.cache[methodName] = value2;
       },
-      get({ octokit, scope, cache }, methodName) {
-        if (cache[methodName]) {
-          return cache[methodName];
+      get({ octokit, scope, cache: cache2 }, methodName) {
+        if (cache2[methodName]) {
+          return cache2[methodName];
         }
         const method = endpointMethodsMap.get(scope).get(methodName);
         if (!method) {
@@ -42472,7 +42472,7 @@ var init_endpoints_to_methods = __esm({
         }
         const { endpointDefaults, decorations } = method;
         if (decorations) {
-          cache[methodName] = decorate(
+          cache2[methodName] = decorate(
             octokit,
             scope,
             methodName,
@@ -42480,9 +42480,9 @@ var init_endpoints_to_methods = __esm({
             decorations
           );
         } else {
-          cache[methodName] = octokit.request.defaults(endpointDefaults);
+          cache2[methodName] = octokit.request.defaults(endpointDefaults);
         }
-        return cache[methodName];
+        return cache2[methodName];
       }
     };
   }
@@ -46224,7 +46224,8 @@ var MOVEMENT_TITLE = words({
   "away-from-overfitting": "away from overfitting",
   "no-significant-change": "no change beyond noise",
   "toward-underfitting": "toward underfitting",
-  "worse-on-both": "more bias and more variance"
+  "worse-on-both": "more bias and more variance",
+  undetermined: "cannot tell: no noise estimate"
 });
 var MOVEMENT_SENTENCE = words({
   "better-on-both": "The change lowered both avoidable bias and variance",
@@ -46233,12 +46234,14 @@ var MOVEMENT_SENTENCE = words({
   "away-from-overfitting": "The change moved the model away from overfitting",
   "no-significant-change": "The change did not move avoidable bias or variance beyond run-to-run noise",
   "toward-underfitting": "The change moved the model toward underfitting",
-  "worse-on-both": "The change raised both avoidable bias and variance"
+  "worse-on-both": "The change raised both avoidable bias and variance",
+  undetermined: "Whether the change moved avoidable bias or variance cannot be told: their noise is unknown"
 });
 var VALIDATION_WORD = words({
   better: "better",
   worse: "worse",
-  flat: "unchanged within noise"
+  flat: "unchanged within noise",
+  undetermined: "undetermined (noise unknown)"
 });
 var DIAGNOSIS_WORD = words({
   "good-fit": "good fit",
@@ -46292,6 +46295,7 @@ var TEST_WORD = words({
   "z-binomial": "binomial z-test",
   "mcnemar-exact": "McNemar's exact test",
   "paired-t": "paired t-test",
+  "newcombe-score": "Newcombe's score interval",
   none: "no test"
 });
 var TEST_WHY = words({
@@ -46299,10 +46303,12 @@ var TEST_WHY = words({
   "z-binomial": "normal approximation with binomial variances: one repeat of a proportion metric measured on a known number of examples.",
   "mcnemar-exact": "McNemar's exact test: both runs scored the same examples, so only the examples on which they disagree carry information.",
   "paired-t": "paired t-test on per-example loss differences: both runs scored the same examples with a continuous loss.",
+  "newcombe-score": "Newcombe's hybrid score interval for a difference of two proportions (Newcombe 1998, method 10), its p-value inverting the interval: one repeat of a proportion metric on a known number of examples.",
   none: "no test: with one repeat of a continuous metric and no paired predictions, run-to-run noise is unknown, so only min-effect decides."
 });
 var REFERENCE_SOURCE = words({
   artifact: "from the artifact",
+  "other-run": "from the other run's artifact (one reference for both runs)",
   config: "from the config",
   default: "the default for a minimized proportion",
   unknown: "source unknown"
@@ -46733,7 +46739,7 @@ function buildHeadline(review, esc) {
   const metric = esc(review.metric.name, 60);
   const v = review.validation;
   const vSplit = review.splits.find((s) => s.split === "validation");
-  const movementTone = GOOD_MOVEMENTS.has(review.movement) ? "good" : review.movement === "no-significant-change" ? "neutral" : "bad";
+  const movementTone = GOOD_MOVEMENTS.has(review.movement) ? "good" : review.movement === "no-significant-change" || review.movement === "undetermined" ? "neutral" : "bad";
   const vTone = v.change === "better" ? "good" : v.change === "worse" ? "bad" : "neutral";
   const vStats = v.delta.ci === null ? `${change(v.delta.estimate, f)}; run-to-run noise unknown` : `${change(v.delta.estimate, f)}, ${levelPercent(review)}% interval ${changeInterval(v.delta.ci, f)}, ${pText(v.delta.p)}, ${say(TEST_WORD, v.delta.test, esc)}`;
   const from = vSplit === void 0 ? "" : `${value(vSplit.baseline, f)} \u2192 ${value(vSplit.candidate, f)} `;
@@ -47023,7 +47029,17 @@ function noteSentence(note, review, f, esc) {
     case "hidden-regressions":
       return `Validation improved overall, yet ${slices(note.count)} regressed significantly (Holm-adjusted): ${names(note.names, note.count, esc)}.`;
     case "noise-unknown":
-      return review.settings.minEffect > 0 ? `Run-to-run noise is unknown (one repeat of a continuous metric, no per-example predictions): changes are called on size alone (min-effect ${amount(review.settings.minEffect, f)}).` : "Run-to-run noise is unknown (one repeat of a continuous metric, no per-example predictions) and min-effect is 0: no change can be called. Add repeats (seeds), per-example predictions, or set min-effect.";
+      return "Cannot tell: run-to-run noise is unknown (one repeat, or identical repeats, of a continuous metric without per-example predictions), so changes it touches are undetermined, whatever their size. Repeat each run with at least 2 seeds, or add per-example predictions.";
+    case "reference-from-one-run":
+      return `Only the ${note.from} states a reference (${value(note.value, f)}): it is used for both runs, since the reference is a property of the task.`;
+    case "references-differ":
+      return `Warning: the runs state different references (baseline ${value(note.baseline, f)}, candidate ${value(note.candidate, f)}); the candidate's is used for both, so the bias change is the change of training error.`;
+    case "noise-from-evaluation-set":
+      return `The noise includes the evaluation set's sampling noise (${note.source === "binomial" ? "binomial" : "from per-example values"}), which repeats on fixed rows do not show.`;
+    case "predictions-partial-overlap":
+      return `The predictions files share ${count(note.shared)} ids of ${count(note.baseline)} (baseline) and ${count(note.candidate)} (candidate): not paired; the unpaired test decided.`;
+    case "repeats-decided":
+      return "Both runs have two or more repeats: Welch's test over the repeats decided, since it holds the seed noise that a paired test over one repeat's rows leaves out.";
     case "bias-unknown":
       return "Avoidable bias is unknown: there is no reference level for this metric. Its change is still measured from the training error; the diagnosis rests on variance and data mismatch.";
     case "predictions-share-no-id":
@@ -47052,13 +47068,43 @@ var WARNING = /* @__PURE__ */ new Map([
   [
     "validation-overfit",
     "test error is well above validation error: model choices may be tuned to the validation set."
+  ],
+  [
+    "below-reference",
+    'training error is below the reference level (negative avoidable bias): the model may be memorising noise, or the reference is wrong. This is not "better".'
   ]
 ]);
+var MDE_METHOD = /* @__PURE__ */ new Map([
+  ["welch-noncentral-t", "Welch's t, noncentral t power"],
+  ["normal", "normal approximation"],
+  ["fleiss-two-proportions", "two proportions, Fleiss\u2013Levin\u2013Paik"],
+  ["mcnemar-connor", "McNemar, Connor's formula"],
+  ["paired-t", "paired t"]
+]);
+function powerLine(review, f, esc) {
+  const { mde, repeatsNeeded: repeatsNeeded2 } = review.validation;
+  if (mde === void 0 && repeatsNeeded2 === void 0) return null;
+  const alpha = review.settings.alpha;
+  const smallest = mde === null || mde === void 0 ? "The smallest detectable change is unknown (no noise estimate)" : `This design detects a validation change of ${mde.atLeast ? "at least " : ""}${amount(mde.value, f)} with 80% power at two-sided alpha ${alpha} (${say(MDE_METHOD, mde.method, esc)})`;
+  let repeats = "";
+  if (repeatsNeeded2 !== void 0) {
+    if (repeatsNeeded2.repeats !== null)
+      repeats = `; ${repeatsNeeded2.lowerBound ? "at least " : ""}${count(repeatsNeeded2.repeats)} repeats per run would detect the observed change`;
+    else if (repeatsNeeded2.reason === "noise-unknown")
+      repeats = "; repeat each run with at least 2 seeds to measure the noise";
+    else if (repeatsNeeded2.reason === "fixed-noise")
+      repeats = "; the fixed evaluation set's sampling noise alone hides the observed change: more seeds cannot help, a larger evaluation set can";
+    else if (repeatsNeeded2.reason === "beyond-limit")
+      repeats = "; more than 1,000 repeats per run would be needed to detect the observed change";
+  }
+  return `${smallest}${repeats}.`;
+}
 function reviewNotes(review, f, esc) {
   return [
     ...["baseline", "candidate"].flatMap(
       (run) => review[run].warnings.map((w) => `${run}: ${say(WARNING, w, esc)}`)
     ),
+    ...[powerLine(review, f, esc)].filter((l) => l !== null),
     ...review.notes.map((n) => noteSentence(n, review, f, esc)),
     ...review.nonLevers.map((n) => say(NON_LEVER, n, esc))
   ];
@@ -47109,6 +47155,9 @@ function methodNotes(review, esc) {
   for (const [test, what] of uses) {
     lines.push(`${[...new Set(what)].join(", ")}: ${say(TEST_WHY, test, esc)}`);
   }
+  lines.push(
+    "Noise of a split's mean over k repeats: the seed spread s\xB2 plus the evaluation set's sampling noise \u03C3\xB2 (binomial p(1 \u2212 p)/N, or s\xB2/N from per-example values). On fixed evaluation rows \u03C3\xB2 is shared by every repeat and does not average out, so Var(mean) = s\xB2/k + \u03C3\xB2; on rows drawn per repeat the spread holds it, so Var(mean) = s\xB2/k, never below \u03C3\xB2/k (law of total variance; Bouthillier et al. 2021). Degrees of freedom: Welch\u2013Satterthwaite. A zero spread is not zero noise; where \u03C3\xB2 cannot be known either, the change is undetermined."
+  );
   if (review.slices.length > 0) {
     lines.push(
       `Slice p-values are adjusted with the Holm\u2013Bonferroni method over all ${count(review.slices.length)} slices, so a few bad slices among many are not flagged by chance.`
@@ -47473,6 +47522,21 @@ var fitgap_review_1_schema_default = {
         },
         delta: {
           $ref: "#/$defs/metricDelta"
+        },
+        mde: {
+          description: "Present when the validation change is flat or undetermined; null when the noise is unknown.",
+          oneOf: [
+            {
+              $ref: "#/$defs/mde"
+            },
+            {
+              type: "null"
+            }
+          ]
+        },
+        repeatsNeeded: {
+          description: "Present when the validation change is flat or undetermined.",
+          $ref: "#/$defs/repeatsNeeded"
         }
       }
     },
@@ -47618,13 +47682,13 @@ var fitgap_review_1_schema_default = {
   $defs: {
     call: {
       title: "Call",
-      description: "A change called on its estimate: `up`/`down` only when significant at alpha and at least min-effect in size; otherwise `flat`.",
-      enum: ["up", "down", "flat"]
+      description: "A change called on its estimate: `up`/`down` only when significant at alpha and at least min-effect in size; `flat` when its noise is known and it is not; `undetermined` when its noise cannot be known (one repeat or a zero spread of a continuous metric without per-example values).",
+      enum: ["up", "down", "flat", "undetermined"]
     },
     testName: {
       title: "TestName",
-      description: "The significance test behind a change (DESIGN.md \xA74); `none` when run-to-run noise is unknown.",
-      enum: ["welch-t", "z-binomial", "mcnemar-exact", "paired-t", "none"]
+      description: "The significance test behind a change (DESIGN.md \xA74); `newcombe-score` is Newcombe's (1998) hybrid score interval for a difference of two proportions, its p inverting the interval; `none` when the noise is unknown.",
+      enum: ["welch-t", "z-binomial", "mcnemar-exact", "paired-t", "newcombe-score", "none"]
     },
     interval: {
       title: "Interval",
@@ -47718,7 +47782,7 @@ var fitgap_review_1_schema_default = {
     },
     movement: {
       title: "Movement",
-      description: "How the change moved the model in the bias/variance plane, from the calls on \u0394bias and \u0394variance.",
+      description: "How the change moved the model in the bias/variance plane, from the calls on \u0394bias and \u0394variance. `undetermined` when either call is undetermined.",
       enum: [
         "better-on-both",
         "away-from-underfitting",
@@ -47726,13 +47790,14 @@ var fitgap_review_1_schema_default = {
         "away-from-overfitting",
         "no-significant-change",
         "toward-underfitting",
-        "worse-on-both"
+        "worse-on-both",
+        "undetermined"
       ]
     },
     validationChange: {
       title: "ValidationChange",
-      description: "Validation better, worse or flat (within noise or below min-effect).",
-      enum: ["better", "worse", "flat"]
+      description: "Validation better, worse, flat (within noise or below min-effect), or undetermined (its noise cannot be known).",
+      enum: ["better", "worse", "flat", "undetermined"]
     },
     diagnosis: {
       title: "Diagnosis",
@@ -48144,7 +48209,8 @@ var fitgap_review_1_schema_default = {
           description: "Reference level used; null when unknown."
         },
         referenceSource: {
-          enum: ["artifact", "config", "default", "unknown"]
+          enum: ["artifact", "other-run", "config", "default", "unknown"],
+          description: "Where the reference came from: this run's artifact, the other run's artifact (the reference is a property of the task: one level for both runs), the config, the default, or unknown."
         },
         splits: {
           type: "array",
@@ -48185,9 +48251,9 @@ var fitgap_review_1_schema_default = {
         warnings: {
           type: "array",
           items: {
-            enum: ["validation-overfit"]
+            enum: ["validation-overfit", "below-reference"]
           },
-          description: "`validation-overfit`: test error well above validation error."
+          description: "`validation-overfit`: test error well above validation error. `below-reference`: training error significantly below the reference level (negative avoidable bias): memorising noise, or a wrong reference."
         },
         curves: {
           $ref: "#/$defs/curvesReport"
@@ -48873,12 +48939,27 @@ var fitgap_review_1_schema_default = {
         },
         {
           $ref: "#/$defs/epochLogMissingNote"
+        },
+        {
+          $ref: "#/$defs/referenceFromOneRunNote"
+        },
+        {
+          $ref: "#/$defs/referencesDifferNote"
+        },
+        {
+          $ref: "#/$defs/noiseFromEvaluationSetNote"
+        },
+        {
+          $ref: "#/$defs/predictionsPartialOverlapNote"
+        },
+        {
+          $ref: "#/$defs/repeatsDecidedNote"
         }
       ]
     },
     paired: {
       title: "PairedSummary",
-      description: "Paired-prediction evidence on the validation change.",
+      description: "Paired-prediction evidence on the validation change. `test` names the paired test only when it decided the change; null otherwise (with `reason`).",
       type: "object",
       additionalProperties: false,
       required: ["rows", "test"],
@@ -48888,7 +48969,7 @@ var fitgap_review_1_schema_default = {
           minimum: 0
         },
         test: {
-          enum: ["mcnemar-exact", "paired-t"]
+          enum: ["mcnemar-exact", "paired-t", null]
         },
         discordant: {
           type: "object",
@@ -48904,6 +48985,141 @@ var fitgap_review_1_schema_default = {
               minimum: 0
             }
           }
+        },
+        reason: {
+          description: "Why the paired test did not decide: `repeats` (both runs have \u2265 2 repeats; Welch decided), `partial-overlap` (ids only partly match), `no-shared-id`.",
+          enum: ["repeats", "partial-overlap", "no-shared-id", null]
+        }
+      }
+    },
+    mde: {
+      title: "MinimumDetectableEffect",
+      description: "The smallest |candidate \u2212 baseline| of the validation value (metric units) this design detects with 80% power at the two-sided alpha; `atLeast` when a noise component could not be estimated (the true value is larger). `method`: `welch-noncentral-t` (noncentral t at the Welch\u2013Satterthwaite df; Cohen 1988), `normal` (df \u221E: binomial noise alone), `fleiss-two-proportions` (Fleiss, Levin & Paik 2003), `mcnemar-connor` (Connor 1987), `paired-t`.",
+      type: "object",
+      additionalProperties: false,
+      required: ["value", "method", "atLeast"],
+      properties: {
+        value: {
+          type: "number",
+          minimum: 0
+        },
+        method: {
+          enum: [
+            "welch-noncentral-t",
+            "normal",
+            "fleiss-two-proportions",
+            "mcnemar-connor",
+            "paired-t"
+          ]
+        },
+        atLeast: {
+          type: "boolean"
+        }
+      }
+    },
+    repeatsNeeded: {
+      title: "RepeatsNeeded",
+      description: "Repeats (seeds) per run at which the observed validation change would be detected with 80% power at the two-sided alpha. `repeats` null with a `reason`: `no-change` (estimate 0), `noise-unknown` (no noise estimate: repeat with at least 2 seeds first), `fixed-noise` (a fixed evaluation set's sampling noise alone hides the change: more rows, not more seeds), `beyond-limit` (more than 1000). `lowerBound`: a noise component was missing, so at least this many.",
+      type: "object",
+      additionalProperties: false,
+      required: ["repeats", "lowerBound", "reason"],
+      properties: {
+        repeats: {
+          type: ["integer", "null"],
+          minimum: 2
+        },
+        lowerBound: {
+          type: "boolean"
+        },
+        reason: {
+          enum: ["no-change", "noise-unknown", "fixed-noise", "beyond-limit", null]
+        }
+      }
+    },
+    referenceFromOneRunNote: {
+      title: "ReferenceFromOneRunNote",
+      description: "Only one artifact states a reference: it is used for both runs (the reference is a property of the task).",
+      type: "object",
+      additionalProperties: false,
+      required: ["code", "from", "value"],
+      properties: {
+        code: {
+          const: "reference-from-one-run"
+        },
+        from: {
+          enum: ["baseline", "candidate"]
+        },
+        value: {
+          type: "number"
+        }
+      }
+    },
+    referencesDifferNote: {
+      title: "ReferencesDifferNote",
+      description: "The two artifacts state different references: the candidate's is used for both runs, so \u0394bias equals the change of training shortfall.",
+      type: "object",
+      additionalProperties: false,
+      required: ["code", "baseline", "candidate"],
+      properties: {
+        code: {
+          const: "references-differ"
+        },
+        baseline: {
+          type: "number"
+        },
+        candidate: {
+          type: "number"
+        }
+      }
+    },
+    noiseFromEvaluationSetNote: {
+      title: "NoiseFromEvaluationSetNote",
+      description: "At least one run's validation noise includes the evaluation set's sampling noise (binomial or per-example), which the seed spread does not hold on fixed rows.",
+      type: "object",
+      additionalProperties: false,
+      required: ["code", "source"],
+      properties: {
+        code: {
+          const: "noise-from-evaluation-set"
+        },
+        source: {
+          enum: ["binomial", "per-example"]
+        }
+      }
+    },
+    predictionsPartialOverlapNote: {
+      title: "PredictionsPartialOverlapNote",
+      description: "The predictions files' ids only partly match: no paired test; the unpaired test decided.",
+      type: "object",
+      additionalProperties: false,
+      required: ["code", "shared", "baseline", "candidate"],
+      properties: {
+        code: {
+          const: "predictions-partial-overlap"
+        },
+        shared: {
+          type: "integer",
+          minimum: 0
+        },
+        baseline: {
+          type: "integer",
+          minimum: 0
+        },
+        candidate: {
+          type: "integer",
+          minimum: 0
+        }
+      }
+    },
+    repeatsDecidedNote: {
+      title: "RepeatsDecidedNote",
+      description: "Both runs have at least 2 repeats: Welch's test over repeats decided, since it holds the seed noise that a paired test over one repeat's rows leaves out; the predictions were not used for the test.",
+      type: "object",
+      additionalProperties: false,
+      required: ["code"],
+      properties: {
+        code: {
+          const: "repeats-decided"
         }
       }
     }
@@ -49482,11 +49698,6 @@ function assertFiniteValues(name, values) {
     }
   }
 }
-function assertMinLength(name, values, min) {
-  if (values.length < min) {
-    throw new RangeError(`${name} needs at least ${min} values; got ${values.length}`);
-  }
-}
 
 // src/stats/distributions.ts
 var NORMAL_DF = 1e7;
@@ -49610,18 +49821,6 @@ function tInference(estimate, se2, df, alpha) {
 function toResult(summary2, test) {
   return { ...summary2, test };
 }
-function welchT(baseline, candidate, alpha) {
-  assertAlpha(alpha);
-  checkGroup("baseline", baseline);
-  checkGroup("candidate", candidate);
-  const n1 = baseline.length;
-  const n2 = candidate.length;
-  const v1 = sampleVariance(baseline) / n1;
-  const v2 = sampleVariance(candidate) / n2;
-  const se2 = v1 + v2;
-  const df = se2 === 0 ? n1 + n2 - 2 : se2 * se2 / (v1 * v1 / (n1 - 1) + v2 * v2 / (n2 - 1));
-  return toResult(tInference(mean(candidate) - mean(baseline), se2, df, alpha), "welch-t");
-}
 function pairedT(diffs, alpha) {
   assertAlpha(alpha);
   const { n, mean: m, variance } = diffs;
@@ -49633,22 +49832,6 @@ function pairedT(diffs, alpha) {
     throw new RangeError(`pairedT variance must be a finite number >= 0; got ${variance}`);
   }
   return toResult(tInference(m, variance / n, n - 1, alpha), "paired-t");
-}
-function oneSampleT(values, alpha) {
-  assertAlpha(alpha);
-  checkGroup("values", values);
-  const n = values.length;
-  const df = n - 1;
-  const summary2 = tInference(mean(values), sampleVariance(values) / n, df, alpha);
-  const { estimate, ci, p } = summary2;
-  let pGreater;
-  if (summary2.statistic === void 0) pGreater = estimate > 0 ? 0 : estimate === 0 ? 0.5 : 1;
-  else pGreater = tCdf(-summary2.statistic, df);
-  return { estimate, ci, pTwoSided: p, pGreater, df };
-}
-function checkGroup(name, values) {
-  assertMinLength(name, values, 2);
-  assertFiniteValues(name, values);
 }
 
 // src/stats/proportions.ts
@@ -49712,6 +49895,56 @@ function mcnemarExact(b, c, n, alpha) {
   return { estimate, ci, p, test: "mcnemar-exact" };
 }
 
+// src/stats/proportion-difference.ts
+function checkRate(x2, xName, n, nName) {
+  assertCount(xName, x2);
+  assertCount(nName, n);
+  if (n === 0) throw new RangeError(`${nName} must be at least 1; got 0`);
+  if (x2 > n) throw new RangeError(`${xName} (${x2}) must not exceed ${nName} (${n})`);
+}
+function boundsAtZ({ x1, n1, x2, n2 }, z) {
+  const p1 = x1 / n1;
+  const p2 = x2 / n2;
+  const [l1, u1] = wilsonAtZ(x1, n1, z);
+  const [l2, u2] = wilsonAtZ(x2, n2, z);
+  const delta = p2 - p1;
+  return [delta - Math.hypot(p2 - l2, u1 - p1), delta + Math.hypot(u2 - p2, p1 - l1)];
+}
+function newcombeInterval(x1, n1, x2, n2, alpha) {
+  assertAlpha(alpha);
+  checkRate(x1, "x1", n1, "n1");
+  checkRate(x2, "x2", n2, "n2");
+  return boundsAtZ({ x1, n1, x2, n2 }, normalQuantile(1 - alpha / 2));
+}
+function newcombeDifference(x1, n1, x2, n2, alpha) {
+  const ci = newcombeInterval(x1, n1, x2, n2, alpha);
+  const counts = { x1, n1, x2, n2 };
+  const estimate = x2 / n2 - x1 / n1;
+  if (estimate === 0) return { estimate, ci, p: 1, statistic: 0, test: "newcombe-score" };
+  const zStar = crossingZ(counts, estimate > 0);
+  const p = Math.min(1, 2 * normalCdf(-zStar));
+  return { estimate, ci, p, statistic: Math.sign(estimate) * zStar, test: "newcombe-score" };
+}
+function crossingZ(counts, positive) {
+  const beyond = (z) => {
+    const [low, high] = boundsAtZ(counts, z);
+    return positive ? low <= 0 : high >= 0;
+  };
+  let lo = 0;
+  let hi = 1;
+  while (!beyond(hi)) {
+    lo = hi;
+    hi *= 2;
+    if (hi > 1e12) return hi;
+  }
+  for (let i2 = 0; i2 < 200 && hi - lo > 1e-13 * hi; i2++) {
+    const mid = (lo + hi) / 2;
+    if (beyond(mid)) hi = mid;
+    else lo = mid;
+  }
+  return (lo + hi) / 2;
+}
+
 // src/stats/holm.ts
 function holmAdjust(p) {
   const present = [];
@@ -49733,8 +49966,304 @@ function holmAdjust(p) {
   return out;
 }
 
+// src/stats/split-noise.ts
+var ROUNDOFF_RELATIVE = 1e-12;
+function binomialSamplingVariance(rate, examples) {
+  assertProbability("rate", rate);
+  if (!Number.isSafeInteger(examples) || examples < 1) {
+    throw new RangeError(`examples must be a positive integer; got ${examples}`);
+  }
+  if (rate > 0 && rate < 1) {
+    return { variance: rate * (1 - rate) / examples, df: Infinity, source: "binomial" };
+  }
+  const adjusted = (examples * rate + 2) / (examples + 4);
+  return {
+    variance: adjusted * (1 - adjusted) / (examples + 4),
+    df: Infinity,
+    source: "binomial"
+  };
+}
+function splitNoise(input) {
+  const { values } = input;
+  if (values.length === 0) throw new RangeError("splitNoise needs at least one value");
+  assertFiniteValues("values", values);
+  const rows = input.evaluationRows ?? "fixed";
+  const k = values.length;
+  const m = mean(values);
+  const sampling = usable2(input.sampling);
+  const samplingCode = sampling ? sampling.source : "unknown";
+  const spread = k >= 2 ? spreadVariance(values) : NaN;
+  const seed = k < 2 ? "one-repeat" : spread === 0 ? "zero-spread" : "spread";
+  let perRepeat2 = { variance: 0, df: Infinity };
+  let fixed2 = { variance: 0, df: Infinity };
+  let floored = false;
+  const missing = [];
+  if (k >= 2) perRepeat2 = { variance: spread, df: k - 1 };
+  else missing.push("seed");
+  if (!sampling && (rows === "fixed" || k < 2)) missing.push("sampling");
+  if (rows === "fixed") {
+    if (sampling) fixed2 = { variance: sampling.variance, df: sampling.df };
+  } else {
+    if (sampling && !(k >= 2 && spread >= sampling.variance)) {
+      floored = k >= 2;
+      perRepeat2 = { variance: sampling.variance, df: sampling.df };
+    }
+  }
+  const parts = [
+    { variance: perRepeat2.variance / k, df: perRepeat2.df },
+    { variance: fixed2.variance, df: fixed2.df }
+  ];
+  const variance = parts[0].variance + parts[1].variance;
+  const known = variance > 0 && Number.isFinite(variance);
+  const basis = { rows, seed, sampling: samplingCode, floored, missing };
+  return {
+    mean: m,
+    repeats: k,
+    variance: known ? variance : NaN,
+    df: known ? satterthwaite(parts) : NaN,
+    known,
+    perRepeat: perRepeat2,
+    fixed: fixed2,
+    basis
+  };
+}
+function usable2(s) {
+  if (!s || !(s.variance > 0 && Number.isFinite(s.variance))) return null;
+  if (!(s.df > 0)) throw new RangeError(`sampling df must be > 0; got ${s.df}`);
+  return s;
+}
+function spreadVariance(values) {
+  const s2 = sampleVariance(values);
+  const scale = Math.max(...values.map(Math.abs));
+  return Math.sqrt(s2) <= ROUNDOFF_RELATIVE * scale ? 0 : s2;
+}
+function satterthwaite(parts) {
+  let total = 0;
+  let denominator = 0;
+  for (const { variance, df } of parts) {
+    if (!(variance >= 0) || !(df > 0)) {
+      throw new RangeError(`each part needs variance >= 0 and df > 0; got ${variance}, ${df}`);
+    }
+    total += variance;
+    if (variance > 0 && Number.isFinite(df)) denominator += variance * variance / df;
+  }
+  if (total === 0) return NaN;
+  return denominator === 0 ? Infinity : total * total / denominator;
+}
+function compareSplitMeans(baseline, candidate, alpha) {
+  assertAlpha(alpha);
+  const estimate = candidate.mean - baseline.mean;
+  if (!baseline.known || !candidate.known) return { estimate, ci: null, p: null, test: "none" };
+  const variance = baseline.variance + candidate.variance;
+  const df = satterthwaite([
+    { variance: baseline.variance, df: baseline.df },
+    { variance: candidate.variance, df: candidate.df }
+  ]);
+  const se = Math.sqrt(variance);
+  const statistic = estimate / se;
+  const half = tQuantile(1 - alpha / 2, df) * se;
+  const p = Math.min(1, 2 * tCdf(-Math.abs(statistic), df));
+  const test = df === Infinity ? "z-binomial" : "welch-t";
+  return {
+    estimate,
+    ci: [estimate - half, estimate + half],
+    p,
+    test,
+    statistic,
+    ...df === Infinity ? {} : { df }
+  };
+}
+
 // src/stats/noncentral-t.ts
 var import_jstat2 = __toESM(require_jstat(), 1);
+var NORMAL_DF2 = 1e7;
+var NODES = 1e3;
+var cache = /* @__PURE__ */ new Map();
+function quadrature(df) {
+  const hit = cache.get(df);
+  if (hit) return hit;
+  const spread = 1 / Math.sqrt(2 * df);
+  const lo = Math.max(0, 1 - 10 * spread);
+  const hi = Math.sqrt((df + 12 * Math.sqrt(2 * df) + 60) / df);
+  const graded = lo === 0;
+  const s = new Float64Array(NODES);
+  const w = new Float64Array(NODES);
+  const logConst = Math.log(2 * df) - df / 2 * Math.log(2) - import_jstat2.default.gammaln(df / 2);
+  let total = 0;
+  for (let i2 = 0; i2 < NODES; i2++) {
+    const x2 = (i2 + 0.5) / NODES;
+    const si = graded ? lo + (hi - lo) * x2 * x2 : lo + (hi - lo) * x2;
+    const dsdx = graded ? 2 * (hi - lo) * x2 : hi - lo;
+    const v = df * si * si;
+    const logDensity = logConst + Math.log(si) + (df / 2 - 1) * Math.log(v) - v / 2;
+    s[i2] = si;
+    w[i2] = Math.exp(logDensity) * dsdx / NODES;
+    total += w[i2];
+  }
+  for (let i2 = 0; i2 < NODES; i2++) w[i2] = w[i2] / total;
+  if (cache.size > 64) cache.clear();
+  cache.set(df, { s, w });
+  return { s, w };
+}
+function tTestPower(ncp, df, alpha) {
+  if (!Number.isFinite(ncp)) throw new RangeError(`noncentrality must be finite; got ${ncp}`);
+  if (!(df >= 1)) throw new RangeError(`degrees of freedom must be >= 1; got ${df}`);
+  const lambda = Math.abs(ncp);
+  if (df > NORMAL_DF2) {
+    const z = normalQuantile(1 - alpha / 2);
+    return normalCdf(lambda - z) + normalCdf(-lambda - z);
+  }
+  const c = tQuantile(1 - alpha / 2, df);
+  const { s, w } = quadrature(df);
+  let power = 0;
+  for (let i2 = 0; i2 < NODES; i2++) {
+    const cs = c * s[i2];
+    power += w[i2] * (normalCdf(lambda - cs) + normalCdf(-lambda - cs));
+  }
+  return Math.min(1, Math.max(0, power));
+}
+function noncentralityFor(power, df, alpha) {
+  if (!(power > alpha / 2 && power < 1)) {
+    throw new RangeError(`power must be in (alpha/2, 1); got ${power}`);
+  }
+  const f = (lambda) => tTestPower(lambda, df, alpha) - power;
+  const guess = df > NORMAL_DF2 ? normalQuantile(1 - alpha / 2) + normalQuantile(power) : tQuantile(1 - alpha / 2, df) + tQuantile(power, df);
+  let a = Math.max(0, guess * 0.9);
+  let fa = f(a);
+  while (fa > 0 && a > 0) {
+    a = a > 1e-3 ? a / 2 : 0;
+    fa = f(a);
+  }
+  if (fa > 0) return 0;
+  let b = Math.max(guess * 1.1, a + 1e-3);
+  let fb = f(b);
+  while (fb < 0) {
+    a = b;
+    fa = fb;
+    b *= 2;
+    if (b > 1e8) throw new RangeError("power cannot be reached");
+    fb = f(b);
+  }
+  let side = 0;
+  for (let i2 = 0; i2 < 100 && b - a > 1e-10 * b; i2++) {
+    const c = (a * fb - b * fa) / (fb - fa);
+    const fc = f(c);
+    if (fc === 0) return c;
+    if (fc < 0) {
+      a = c;
+      fa = fc;
+      if (side === -1) fb /= 2;
+      side = -1;
+    } else {
+      b = c;
+      fb = fc;
+      if (side === 1) fa /= 2;
+      side = 1;
+    }
+  }
+  return (a + b) / 2;
+}
+
+// src/stats/power.ts
+var MAX_REPEATS = 1e3;
+function assertPower(power, alpha) {
+  if (!(power > alpha / 2 && power < 1)) {
+    throw new RangeError(`power must be in (alpha/2, 1), e.g. 0.8; got ${power}`);
+  }
+}
+function mdeMeans(baseline, candidate, alpha, power = 0.8) {
+  assertAlpha(alpha);
+  assertPower(power, alpha);
+  if (!baseline.known || !candidate.known) return null;
+  const df = satterthwaite([
+    { variance: baseline.variance, df: baseline.df },
+    { variance: candidate.variance, df: candidate.df }
+  ]);
+  return noncentralityFor(power, df, alpha) * Math.sqrt(baseline.variance + candidate.variance);
+}
+function repeatsNeeded(delta, baseline, candidate, alpha, power = 0.8) {
+  assertAlpha(alpha);
+  assertPower(power, alpha);
+  assertFinite2("delta", delta);
+  if (delta === 0) return { repeats: null, reason: "no-change" };
+  const arms = [baseline, candidate];
+  if (arms.some((a) => !a.known)) return { repeats: null, reason: "noise-unknown" };
+  const lowerBound = arms.some((a) => a.basis.missing.length > 0);
+  const target = Math.abs(delta);
+  const fixedOnly = arms.reduce((s, a) => s + a.fixed.variance, 0);
+  if (fixedOnly > 0) {
+    const dfFixed = satterthwaite(arms.map((a) => a.fixed).filter((f) => f.variance > 0));
+    if (tTestPower(target / Math.sqrt(fixedOnly), dfFixed, alpha) < power) {
+      return { repeats: null, reason: "fixed-noise" };
+    }
+  }
+  const reaches = (k) => {
+    const parts = arms.flatMap((a) => {
+      const seedDf = a.basis.seed === "spread" && !a.basis.floored ? k - 1 : a.perRepeat.df;
+      return [
+        { variance: a.perRepeat.variance / k, df: seedDf },
+        { variance: a.fixed.variance, df: a.fixed.df }
+      ];
+    });
+    const variance = parts.reduce((s, p) => s + p.variance, 0);
+    return tTestPower(target / Math.sqrt(variance), satterthwaite(parts), alpha) >= power;
+  };
+  if (reaches(2)) return { repeats: 2, lowerBound };
+  let lo = 2;
+  let hi = 4;
+  while (!reaches(hi)) {
+    if (hi >= MAX_REPEATS) return { repeats: null, reason: "beyond-limit" };
+    lo = hi;
+    hi = Math.min(MAX_REPEATS, hi * 2);
+  }
+  while (hi - lo > 1) {
+    const mid = Math.floor((lo + hi) / 2);
+    if (reaches(mid)) hi = mid;
+    else lo = mid;
+  }
+  return { repeats: hi, lowerBound };
+}
+function twoProportionPower(p1, p2, n1, n2, alpha) {
+  const pooled = (n1 * p1 + n2 * p2) / (n1 + n2);
+  const sdNull = Math.sqrt(pooled * (1 - pooled) * (1 / n1 + 1 / n2));
+  const sdAlt = Math.sqrt(p1 * (1 - p1) / n1 + p2 * (1 - p2) / n2);
+  if (sdAlt === 0) return p1 === p2 ? alpha : 1;
+  const z = normalQuantile(1 - alpha / 2);
+  const d = Math.abs(p2 - p1);
+  return normalCdf((d - z * sdNull) / sdAlt) + normalCdf((-d - z * sdNull) / sdAlt);
+}
+function mdeTwoProportions(p1, n1, n2, alpha, power = 0.8) {
+  assertAlpha(alpha);
+  assertPower(power, alpha);
+  assertProbability("p1", p1);
+  assertRows("n1", n1);
+  assertRows("n2", n2);
+  const solve = (end) => {
+    const at = (t) => twoProportionPower(p1, p1 + t * (end - p1), n1, n2, alpha);
+    if (end === p1 || at(1) < power) return null;
+    const steps = 256;
+    let prev = 0;
+    for (let i2 = 1; i2 <= steps; i2++) {
+      const t = i2 / steps;
+      if (at(t) >= power) {
+        let lo = prev;
+        let hi = t;
+        for (let j = 0; j < 60; j++) {
+          const mid = (lo + hi) / 2;
+          if (at(mid) >= power) hi = mid;
+          else lo = mid;
+        }
+        return hi * Math.abs(end - p1);
+      }
+      prev = t;
+    }
+    return null;
+  };
+  return { increase: solve(1), decrease: solve(0) };
+}
+function assertRows(name, n) {
+  if (!(n > 0) || !Number.isFinite(n)) throw new RangeError(`${name} must be > 0; got ${n}`);
+}
 
 // src/analysis/measure.ts
 function shortfallSign(run) {
@@ -49760,22 +50289,42 @@ function perRepeat(run, measure) {
   }
   return out;
 }
-function binomialMeasureVariance(run, measure) {
-  if (run.metric.kind !== "proportion") return null;
-  let total = 0;
+function splitSampling(run, split, examples = {}) {
+  const s = run.splits[split];
+  if (s === void 0) return null;
+  if (run.metric.kind === "proportion" && s.examples !== void 0) {
+    const rate = Math.round(Math.min(1, Math.max(0, mean(s.values))) * s.examples) / s.examples;
+    return binomialSamplingVariance(rate, s.examples);
+  }
+  return examples[split] ?? null;
+}
+function measureSampling(run, measure, examples = {}) {
+  const parts = [];
+  let perRepeatRows = true;
+  let known = true;
+  let source = "binomial";
   for (const term of measure.terms) {
     const split = run.splits[term.split];
-    if (split?.examples === void 0) return null;
-    const repeats = split.values.length;
-    total += term.weight * term.weight * binomialVariance(mean(split.values), split.examples * repeats);
+    if ((split?.evaluationRows ?? "fixed") !== "per-repeat") perRepeatRows = false;
+    const s = splitSampling(run, term.split, examples);
+    if (s === null || !(s.variance > 0)) {
+      known = false;
+      continue;
+    }
+    if (s.source === "per-example") source = "per-example";
+    parts.push({ variance: term.weight * term.weight * s.variance, df: s.df });
   }
-  return total;
+  const rows = perRepeatRows ? "per-repeat" : "fixed";
+  if (!known || parts.length === 0) return { sampling: null, rows };
+  const variance = parts.reduce((a, p) => a + p.variance, 0);
+  return { sampling: { variance, df: satterthwaite(parts), source }, rows };
 }
 
 // src/analysis/noise.ts
 function callOf(result, settings) {
+  if (result.p === null) return "undetermined";
   const big = Math.abs(result.estimate) >= settings.minEffect && result.estimate !== 0;
-  const significant = result.p === null ? settings.minEffect > 0 : result.p < settings.alpha;
+  const significant = result.p < settings.alpha;
   if (!big || !significant) return "flat";
   return result.estimate > 0 ? "up" : "down";
 }
@@ -49794,32 +50343,55 @@ function deltaFields(result, settings) {
     call: callOf(result, settings)
   };
 }
-function measureChange(baseline, candidate, measure, alpha) {
-  const b = perRepeat(baseline, measure.baseline);
-  const c = perRepeat(candidate, measure.candidate);
-  if (b === null || c === null) return null;
-  const estimate = mean(c) - mean(b);
-  if (b.length >= 2 && c.length >= 2) return welchT(b, c, alpha);
-  const vb = binomialMeasureVariance(baseline, measure.baseline);
-  const vc = binomialMeasureVariance(candidate, measure.candidate);
-  if (vb !== null && vc !== null) return normalTest(estimate, vb + vc, alpha, "z-binomial");
-  return { estimate, ci: null, p: null, test: "none" };
-}
-function measureLevel(run, measure, alpha) {
+function measureNoise(run, measure, examples = {}) {
   const values = perRepeat(run, measure);
   if (values === null) return null;
-  const value2 = mean(values);
-  if (values.length >= 2) {
-    const t = oneSampleT(values, alpha);
-    return { value: value2, ci: t.ci, p: t.pGreater };
-  }
-  const variance = binomialMeasureVariance(run, measure);
-  if (variance !== null) {
-    const z = normalTest(value2, variance, alpha, "z-binomial");
-    const p = variance > 0 ? 1 - normalCdf(value2 / Math.sqrt(variance)) : value2 > 0 ? 0 : 1;
-    return { value: value2, ci: z.ci, p };
-  }
-  return { value: value2, ci: null, p: null };
+  const { sampling, rows } = measureSampling(run, measure, examples);
+  return splitNoise({ values, sampling, evaluationRows: rows });
+}
+function measureChange(baseline, candidate, measure, alpha, examples = {}) {
+  const b = measureNoise(baseline, measure.baseline, examples.baseline);
+  const c = measureNoise(candidate, measure.candidate, examples.candidate);
+  if (b === null || c === null) return null;
+  const newcombe = newcombeChange(baseline, candidate, measure, alpha);
+  if (newcombe !== null) return newcombe;
+  return compareSplitMeans(b, c, alpha);
+}
+function newcombeChange(baseline, candidate, measure, alpha) {
+  const counts = (run, m) => {
+    const term = m.terms[0];
+    if (run.metric.kind !== "proportion" || m.terms.length !== 1 || m.constant !== 0) return null;
+    if (term === void 0 || term.weight !== 1) return null;
+    const split = run.splits[term.split];
+    if (split?.examples === void 0 || split.values.length !== 1) return null;
+    const value2 = split.values[0] ?? Number.NaN;
+    if (!(value2 >= 0 && value2 <= 1)) return null;
+    const rate = shortfallSign(run) === 1 ? value2 : 1 - value2;
+    return { x: Math.round(rate * split.examples), n: split.examples };
+  };
+  const b = counts(baseline, measure.baseline);
+  const c = counts(candidate, measure.candidate);
+  if (b === null || c === null) return null;
+  const r = newcombeDifference(b.x, b.n, c.x, c.n, alpha);
+  const sign = shortfallSign(candidate);
+  const estimate = sign * ((candidate.splits[measure.candidate.terms[0].split]?.values[0] ?? 0) - (baseline.splits[measure.baseline.terms[0].split]?.values[0] ?? 0));
+  const shift = estimate - r.estimate;
+  return {
+    estimate,
+    ci: [r.ci[0] + shift, r.ci[1] + shift],
+    p: r.p,
+    test: "newcombe-score",
+    statistic: r.statistic
+  };
+}
+function measureLevel(run, measure, alpha, examples = {}) {
+  const noise = measureNoise(run, measure, examples);
+  if (noise === null) return null;
+  const value2 = noise.mean;
+  if (!noise.known) return { value: value2, ci: null, p: null };
+  const se = Math.sqrt(noise.variance);
+  const half = tQuantile(1 - alpha / 2, noise.df) * se;
+  return { value: value2, ci: [value2 - half, value2 + half], p: 1 - tCdf(value2 / se, noise.df) };
 }
 function toMetricUnits(result, sign) {
   if (sign === 1) return result;
@@ -49832,12 +50404,54 @@ function toMetricUnits(result, sign) {
 }
 
 // src/analysis/decompose.ts
+function bestOf(run) {
+  return run.metric.best ?? (run.metric.goal === "maximize" ? 1 : 0);
+}
+function defaultReference(run) {
+  return run.metric.kind === "proportion" ? bestOf(run) : null;
+}
 function chooseReference(run, override) {
   if (override !== void 0) return { value: override, source: "config" };
   if (run.reference !== void 0) return { value: run.reference, source: "artifact" };
-  if (run.metric.kind === "proportion" && run.metric.goal === "minimize")
-    return { value: 0, source: "default" };
-  return { value: null, source: "unknown" };
+  const value2 = defaultReference(run);
+  return value2 === null ? { value: value2, source: "unknown" } : { value: value2, source: "default" };
+}
+function taskReference(baseline, candidate, override) {
+  const none = { fromOneRun: null, differ: null };
+  if (override !== void 0) {
+    const c = { value: override, source: "config" };
+    return { baseline: c, candidate: c, ...none };
+  }
+  const rb = baseline.reference;
+  const rc = candidate.reference;
+  if (rb !== void 0 && rc !== void 0) {
+    const differ = rb === rc ? null : { baseline: rb, candidate: rc };
+    return {
+      baseline: { value: rc, source: rb === rc ? "artifact" : "other-run" },
+      candidate: { value: rc, source: "artifact" },
+      fromOneRun: null,
+      differ
+    };
+  }
+  if (rb !== void 0)
+    return {
+      baseline: { value: rb, source: "artifact" },
+      candidate: { value: rb, source: "other-run" },
+      fromOneRun: { from: "baseline", value: rb },
+      differ: null
+    };
+  if (rc !== void 0)
+    return {
+      baseline: { value: rc, source: "other-run" },
+      candidate: { value: rc, source: "artifact" },
+      fromOneRun: { from: "candidate", value: rc },
+      differ: null
+    };
+  return {
+    baseline: chooseReference(baseline, void 0),
+    candidate: chooseReference(candidate, void 0),
+    ...none
+  };
 }
 function componentMeasures(run, reference) {
   const sign = shortfallSign(run);
@@ -49869,20 +50483,20 @@ function componentMeasures(run, reference) {
 }
 function errorLevel(run) {
   const m = mean(run.splits.validation.values);
-  return Math.abs(run.metric.goal === "minimize" ? m : 1 - m);
+  return Math.abs(m - bestOf(run));
 }
 var UNAVAILABLE2 = /* @__PURE__ */ new Map([
   ["bias", "no-reference"],
   ["mismatch", "no-train-dev"],
   ["overfit", "no-test"]
 ]);
-function decompose(run, reference, settings) {
+function decompose(run, reference, settings, examples = {}) {
   const measures = componentMeasures(run, reference);
   const threshold = Math.max(settings.gapTolerance * errorLevel(run), settings.minEffect);
   const out = {};
   for (const name of ["bias", "variance", "mismatch", "overfit"]) {
     const measure = measures[name];
-    const level = measure === null ? null : measureLevel(run, measure, settings.alpha);
+    const level = measure === null ? null : measureLevel(run, measure, settings.alpha, examples);
     if (level === null) {
       const unavailable = UNAVAILABLE2.get(name);
       if (unavailable === void 0) throw new Error(`${name} needs splits every run has`);
@@ -49915,8 +50529,22 @@ function diagnose(components) {
 function both(measure) {
   return { baseline: measure, candidate: measure };
 }
-function pairedTest(paired, run, alpha) {
-  if (paired.rows === 0) return null;
+function lossScale(paired, run) {
+  const side = paired.sides?.baseline;
+  if (side === void 0 || !(side.mean > 0) || side.n < 1) return null;
+  const aggregate = paired.aggregate ?? "mean";
+  const m = side.mean;
+  const agg = aggregate === "mean" ? m : aggregate === "sum" ? side.n * m : Math.sqrt(m);
+  const slope2 = aggregate === "mean" ? 1 : aggregate === "sum" ? side.n : 1 / (2 * Math.sqrt(m));
+  if (run.metric.goal === "minimize") return slope2;
+  const split = run.splits[paired.split ?? "validation"];
+  const value2 = split?.values[paired.repeat ?? 0];
+  if (value2 === void 0) return null;
+  const shortfall = bestOf(run) - value2;
+  return shortfall > 0 ? slope2 * shortfall / agg : null;
+}
+function pairedShortfall(paired, baselineRun, alpha) {
+  if (paired.rows === 0 || paired.partial === true) return null;
   if (paired.kind === "proportion") {
     const result = mcnemarExact(
       paired.baselineOnly ?? 0,
@@ -49924,23 +50552,38 @@ function pairedTest(paired, run, alpha) {
       paired.rows,
       alpha
     );
-    return run.metric.goal === "minimize" ? toMetricUnits(result, -1) : result;
+    return toMetricUnits(result, -1);
   }
-  return pairedT(
+  const scale = lossScale(paired, baselineRun);
+  if (scale === null) return null;
+  const r = pairedT(
     { n: paired.rows, mean: paired.meanDiff ?? 0, variance: paired.varDiff ?? 0 },
     alpha
   );
+  return {
+    ...r,
+    estimate: r.estimate * scale,
+    ci: r.ci === null ? null : [r.ci[0] * scale, r.ci[1] * scale]
+  };
 }
-function splitShortfalls(runs, alpha, paired) {
+function repeatsDecide(runs, split) {
+  return (runs.baseline.splits[split]?.values.length ?? 0) >= 2 && (runs.candidate.splits[split]?.values.length ?? 0) >= 2;
+}
+function splitShortfalls(runs, alpha, paired, examples = {}) {
   const pairedSplit = paired?.split ?? "validation";
-  const sign = shortfallSign(runs.candidate);
   const out = /* @__PURE__ */ new Map();
   for (const split of SPLIT_NAMES) {
-    let result = measureChange(runs.baseline, runs.candidate, both(splitMeasure(split)), alpha);
+    let result = measureChange(
+      runs.baseline,
+      runs.candidate,
+      both(splitMeasure(split)),
+      alpha,
+      examples
+    );
     if (result === null) continue;
-    if (paired !== void 0 && split === pairedSplit && (result.test === "none" || result.test === "z-binomial")) {
-      const test = pairedTest(paired, runs.candidate, alpha);
-      if (test !== null) result = toMetricUnits(test, sign);
+    if (paired !== void 0 && split === pairedSplit && !repeatsDecide(runs, split)) {
+      const test = pairedShortfall(paired, runs.baseline, alpha);
+      if (test !== null) result = test;
     }
     out.set(split, result);
   }
@@ -49962,7 +50605,7 @@ function splitChanges(shortfalls, runs, summaries, calls) {
   }
   return out;
 }
-function componentChanges(runs, references, calls) {
+function componentChanges(runs, references, calls, examples = {}) {
   const { baseline, candidate } = runs;
   const alpha = calls.alpha;
   const refB = references.baseline;
@@ -49975,17 +50618,18 @@ function componentChanges(runs, references, calls) {
       baseline: componentMeasures(baseline, biasRefB).bias ?? splitMeasure("train"),
       candidate: componentMeasures(candidate, biasRefC).bias ?? splitMeasure("train")
     },
-    alpha
+    alpha,
+    examples
   );
   const change2 = (name) => {
     const mb = componentMeasures(baseline, refB)[name];
     const mc = componentMeasures(candidate, refC)[name];
     if (mb === null || mc === null) return null;
-    const r = measureChange(baseline, candidate, { baseline: mb, candidate: mc }, alpha);
+    const r = measureChange(baseline, candidate, { baseline: mb, candidate: mc }, alpha, examples);
     return r === null ? null : toShortfallDelta(r, calls);
   };
   const varianceFallback = baseline.splits.train_dev === void 0 !== (candidate.splits.train_dev === void 0);
-  const variance = varianceFallback ? validationMinusTrain(runs, calls) : change2("variance");
+  const variance = varianceFallback ? validationMinusTrain(runs, calls, examples) : change2("variance");
   if (variance === null)
     throw new Error("variance needs train and validation, which the schema requires");
   return {
@@ -49996,7 +50640,7 @@ function componentChanges(runs, references, calls) {
     varianceFallback
   };
 }
-function validationMinusTrain(runs, calls) {
+function validationMinusTrain(runs, calls, examples) {
   const measure = {
     terms: [
       { split: "validation", weight: 1 },
@@ -50004,8 +50648,67 @@ function validationMinusTrain(runs, calls) {
     ],
     constant: 0
   };
-  const r = measureChange(runs.baseline, runs.candidate, both(measure), calls.alpha);
+  const r = measureChange(runs.baseline, runs.candidate, both(measure), calls.alpha, examples);
   return r === null ? null : toShortfallDelta(r, calls);
+}
+
+// src/analysis/power.ts
+function sideNoise(paired, run, side) {
+  const stats = paired.sides?.[side];
+  const split = paired.split ?? "validation";
+  const values = run.splits[split]?.values;
+  if (stats === void 0 || values === void 0 || stats.n < 2) return {};
+  let sampling = null;
+  if (paired.kind === "proportion") {
+    const rate = Math.min(1, Math.max(0, mean(values)));
+    sampling = binomialSamplingVariance(rate, stats.n);
+  } else {
+    const scale = lossScale({ ...paired, sides: { baseline: stats, candidate: stats } }, run);
+    if (scale === null || !(stats.variance > 0)) return {};
+    sampling = {
+      variance: stats.variance / stats.n * scale * scale,
+      df: stats.n - 1,
+      source: "per-example"
+    };
+  }
+  return { [split]: sampling };
+}
+function exampleNoise(runs, paired) {
+  if (paired?.sides === void 0) return {};
+  return {
+    baseline: sideNoise(paired, runs.baseline, "baseline"),
+    candidate: sideNoise(paired, runs.candidate, "candidate")
+  };
+}
+function validationPower(runs, shortfall, alpha, examples) {
+  const measure = splitMeasure("validation");
+  const b = measureNoise(runs.baseline, measure, examples.baseline);
+  const c = measureNoise(runs.candidate, measure, examples.candidate);
+  if (b === null || c === null) throw new Error("validation split is required by the schema");
+  const atLeast = b.basis.missing.length > 0 || c.basis.missing.length > 0;
+  let mde = null;
+  if (shortfall.test === "newcombe-score") {
+    const nb = runs.baseline.splits.validation.examples ?? 0;
+    const nc = runs.candidate.splits.validation.examples ?? 0;
+    const value2 = runs.baseline.splits.validation.values[0] ?? 0;
+    const rate = shortfallSign(runs.baseline) === 1 ? value2 : 1 - value2;
+    const both2 = mdeTwoProportions(Math.min(1, Math.max(0, rate)), nb, nc, alpha);
+    const found = [both2.increase, both2.decrease].filter((x2) => x2 !== null);
+    if (found.length > 0)
+      mde = { value: Math.min(...found), method: "fleiss-two-proportions", atLeast };
+  } else {
+    const value2 = mdeMeans(b, c, alpha);
+    if (value2 !== null) {
+      mde = {
+        value: value2,
+        method: b.df === Infinity && c.df === Infinity ? "normal" : "welch-noncentral-t",
+        atLeast
+      };
+    }
+  }
+  const r = repeatsNeeded(shortfall.estimate, b, c, alpha);
+  const needed = r.repeats === null ? { repeats: null, lowerBound: false, reason: r.reason } : { repeats: r.repeats, lowerBound: r.lowerBound, reason: null };
+  return { mde, repeatsNeeded: needed };
 }
 
 // src/analysis/hyperparameters.ts
@@ -50417,9 +51120,11 @@ var TABLE = {
   up: { down: "toward-underfitting", flat: "toward-underfitting", up: "worse-on-both" }
 };
 function movementOf(biasCall, varianceCall) {
+  if (biasCall === "undetermined" || varianceCall === "undetermined") return "undetermined";
   return TABLE[biasCall][varianceCall];
 }
 function validationChangeOf(shortfallCall) {
+  if (shortfallCall === "undetermined") return "undetermined";
   return shortfallCall === "up" ? "worse" : shortfallCall === "down" ? "better" : "flat";
 }
 
@@ -51284,9 +51989,13 @@ function regularizationOf(run) {
   }
   return void 0;
 }
-function summarize(run, settings) {
-  const reference = chooseReference(run, settings.reference);
-  const components = decompose(run, reference.value, settings);
+function belowReference(bias, alpha) {
+  if (bias.value === null || !(bias.value < 0)) return false;
+  return bias.p === null || 1 - bias.p < alpha;
+}
+function summarize(run, settings, examples = {}) {
+  const reference = settings.referenceChoice ?? chooseReference(run, settings.reference);
+  const components = decompose(run, reference.value, settings, examples);
   const lambda = regularizationOf(run)?.value;
   return {
     name: run.run.name,
@@ -51299,7 +52008,10 @@ function summarize(run, settings) {
     components,
     diagnosis: diagnose(components),
     biasUnknown: reference.value === null,
-    warnings: components.overfit.present ? ["validation-overfit"] : [],
+    warnings: [
+      ...components.overfit.present ? ["validation-overfit"] : [],
+      ...belowReference(components.bias, settings.alpha) ? ["below-reference"] : []
+    ],
     curves: analyzeCurves(run.curves, {
       ...lambda === void 0 ? {} : { lambda },
       kind: run.metric.kind,
@@ -51379,23 +52091,38 @@ function buildReview(input) {
   const calls = { alpha: settings.alpha, minEffect: settings.minEffect };
   const reference = input.settings.reference;
   const summarySettings = { ...settings, ...reference === void 0 ? {} : { reference } };
-  const base = summarize(baseline, summarySettings);
-  const cand = summarize(candidate, summarySettings);
   const runs = { baseline, candidate };
-  const shortfalls = splitShortfalls(runs, settings.alpha, input.paired);
+  const task = taskReference(baseline, candidate, reference);
+  const examples = exampleNoise(runs, input.paired);
+  const base = summarize(
+    baseline,
+    { ...summarySettings, referenceChoice: task.baseline },
+    examples.baseline
+  );
+  const cand = summarize(
+    candidate,
+    { ...summarySettings, referenceChoice: task.candidate },
+    examples.candidate
+  );
+  const paired = input.paired?.partial === true ? void 0 : input.paired;
+  const shortfalls = splitShortfalls(runs, settings.alpha, paired, examples);
   const validationShortfall = shortfalls.get("validation");
   if (validationShortfall === void 0)
     throw new Error("validation split is required by the schema");
   const components = componentChanges(
     runs,
     { baseline: base.reference, candidate: cand.reference },
-    calls
+    calls,
+    examples
   );
   const movement = movementOf(components.bias?.call ?? "flat", components.variance.call);
+  const change2 = validationChangeOf(toShortfallDelta(validationShortfall, calls).call);
   const validation = {
-    change: validationChangeOf(toShortfallDelta(validationShortfall, calls).call),
-    delta: toMetricDelta(toMetricUnits(validationShortfall, shortfallSign(candidate)), calls)
+    change: change2,
+    delta: toMetricDelta(toMetricUnits(validationShortfall, shortfallSign(candidate)), calls),
+    ...change2 === "flat" || change2 === "undetermined" ? validationPower(runs, validationShortfall, settings.alpha, examples) : {}
   };
+  const pairedDecided = paired !== void 0 && paired.rows > 0 && (validationShortfall.test === "mcnemar-exact" || validationShortfall.test === "paired-t");
   const sliceResult = compareSlices(baseline, candidate, validation.change, calls);
   const noiseUnknown = validation.delta.test === "none" || components.variance.test === "none";
   const changes = diffHyperparameters(baseline.hyperparameters, candidate.hyperparameters);
@@ -51441,14 +52168,30 @@ function buildReview(input) {
         slices: sliceResult.slices,
         noiseUnknown,
         biasUnknown: cand.biasUnknown,
-        paired: input.paired
+        paired: input.paired,
+        task,
+        repeatsDecided: paired !== void 0 && paired.rows > 0 && repeatsDecide(runs, paired.split ?? "validation"),
+        examples
       })
     ],
-    paired: pairedSummary(input.paired)
+    paired: pairedSummary(input.paired, pairedDecided, runs)
   };
 }
 function reviewNotes2(facts) {
   const notes = [];
+  if (facts.task.fromOneRun !== null)
+    notes.push({ code: "reference-from-one-run", ...facts.task.fromOneRun });
+  if (facts.task.differ !== null) notes.push({ code: "references-differ", ...facts.task.differ });
+  if (facts.paired?.partial === true) {
+    const sides = facts.paired.sides;
+    notes.push({
+      code: "predictions-partial-overlap",
+      shared: facts.paired.rows,
+      baseline: sides?.baseline.n ?? 0,
+      candidate: sides?.candidate.n ?? 0
+    });
+  }
+  if (facts.repeatsDecided) notes.push({ code: "repeats-decided" });
   if (facts.components.varianceFallback) notes.push({ code: "train-dev-in-one-run" });
   if (facts.unpaired.length > 0) {
     notes.push({
@@ -51467,16 +52210,19 @@ function reviewNotes2(facts) {
   }
   if (facts.noiseUnknown) notes.push({ code: "noise-unknown" });
   if (facts.biasUnknown) notes.push({ code: "bias-unknown" });
-  if (facts.paired !== void 0 && facts.paired.rows === 0)
+  if (facts.paired !== void 0 && facts.paired.rows === 0 && facts.paired.partial !== true)
     notes.push({ code: "predictions-share-no-id" });
   return notes;
 }
-function pairedSummary(paired) {
+function pairedSummary(paired, decided, runs) {
   if (paired === void 0) return null;
-  if (paired.kind === "continuous") return { rows: paired.rows, test: "paired-t" };
+  const reason = decided ? null : paired.partial === true ? "partial-overlap" : paired.rows === 0 ? "no-shared-id" : repeatsDecide(runs, paired.split ?? "validation") ? "repeats" : null;
+  if (paired.kind === "continuous")
+    return { rows: paired.rows, test: decided ? "paired-t" : null, reason };
   return {
     rows: paired.rows,
-    test: "mcnemar-exact",
+    test: decided ? "mcnemar-exact" : null,
+    reason,
     discordant: {
       baselineOnly: paired.baselineOnly ?? 0,
       candidateOnly: paired.candidateOnly ?? 0
@@ -52287,6 +53033,8 @@ async function pairPredictions(baseline, candidate, kind) {
   let baselineOnly = 0;
   let candidateOnly = 0;
   const diffs = new RunningStats();
+  const baseAll = new RunningStats();
+  const candAll = new RunningStats();
   const pair = (b2, c) => {
     rows++;
     if (kind === "proportion") {
@@ -52315,6 +53063,8 @@ async function pairPredictions(baseline, candidate, kind) {
         } else waitingCand.set(b.value.id, b.value.value);
       }
     }
+    if (!a.done) baseAll.push(a.value.value);
+    if (!b.done) candAll.push(b.value.value);
     if (!a.done) a = await base.next();
     if (!b.done) b = await cand.next();
   }
@@ -52327,8 +53077,15 @@ async function pairPredictions(baseline, candidate, kind) {
     issues2.push(...await duplicateIssues(candidate.path, candidate.file, kind, candRepeated));
   if (issues2.length > 0) throw new InputError(issues2);
   const unmatched = { baseline: waitingBase.size, candidate: waitingCand.size };
-  if (kind === "proportion") return { kind, rows, baselineOnly, candidateOnly, unmatched };
+  const stats = (s) => ({
+    n: s.n,
+    mean: s.n > 0 ? s.mean : 0,
+    variance: s.n > 1 ? s.variance : 0
+  });
+  const sides = { baseline: stats(baseAll), candidate: stats(candAll) };
+  if (kind === "proportion") return { kind, rows, baselineOnly, candidateOnly, unmatched, sides };
   return {
+    sides,
     kind,
     rows,
     meanDiff: diffs.n > 0 ? diffs.mean : 0,
@@ -52558,7 +53315,15 @@ async function pairIfBoth(baseline, candidate) {
   );
   const notes = [];
   const { unmatched, ...paired } = result;
-  if (unmatched.baseline + unmatched.candidate > 0) {
+  const issues2 = [
+    ...reproduceIssues(baseline, paired.sides.baseline),
+    ...reproduceIssues(candidate, paired.sides.candidate)
+  ];
+  if (issues2.length > 0) throw new InputError(issues2);
+  const aggregate = cp.aggregate ?? "mean";
+  const repeat = cp.repeat ?? 0;
+  const partial = unmatched.baseline + unmatched.candidate > 0 && result.rows > 0;
+  if (unmatched.baseline + unmatched.candidate > 0 && !partial) {
     notes.push({
       code: "predictions-unmatched",
       rows: result.rows,
@@ -52566,7 +53331,72 @@ async function pairIfBoth(baseline, candidate) {
       candidate: unmatched.candidate
     });
   }
-  return { paired: { ...paired, split: bp.split }, notes };
+  return {
+    paired: { ...paired, split: bp.split, aggregate, repeat, ...partial ? { partial } : {} },
+    notes
+  };
+}
+function reproduceTolerance(value2, rows, kind) {
+  const rounding = Math.max(5e-4, 5e-4 * Math.abs(value2));
+  return kind === "proportion" ? Math.max(rounding, 1 / Math.max(1, rows)) : rounding;
+}
+function reproduceIssues(run, side) {
+  const ref = run.artifact.predictions;
+  if (ref === void 0 || side.n === 0) return [];
+  const metric = run.artifact.metric;
+  const repeat = ref.repeat ?? 0;
+  const values = run.artifact.splits[ref.split]?.values;
+  const pointer = `/splits/${ref.split}/values/${repeat}`;
+  const stated = values?.[repeat];
+  if (stated === void 0) {
+    return [
+      {
+        file: run.file,
+        pointer: "/predictions/repeat",
+        expected: `must name a repeat of split "${ref.split}" (0 to ${(values?.length ?? 1) - 1})`,
+        got: String(repeat)
+      }
+    ];
+  }
+  let computed;
+  if (metric.kind === "proportion") {
+    computed = metric.goal === "maximize" ? side.mean : 1 - side.mean;
+  } else {
+    if (metric.goal === "maximize") return [];
+    const aggregate = ref.aggregate ?? "mean";
+    computed = aggregate === "mean" ? side.mean : aggregate === "sum" ? side.n * side.mean : Math.sqrt(side.mean);
+  }
+  if (Math.abs(computed - stated) <= reproduceTolerance(stated, side.n, metric.kind)) return [];
+  const what = metric.kind === "proportion" ? `the rate of correct = ${metric.goal === "maximize" ? 1 : 0} over ${side.n} rows` : `the ${ref.aggregate ?? "mean"} of loss over ${side.n} rows`;
+  return [
+    {
+      file: run.file,
+      pointer,
+      expected: `must agree with its predictions (${ref.path}): ${what} is ${Number(computed.toPrecision(6))}, the artifact states ${stated}`,
+      got: String(stated),
+      hint: "The predictions must be for this run and this repeat (set predictions.repeat), and for a continuous metric predictions.aggregate must say how loss aggregates to the value."
+    }
+  ];
+}
+function bestIssues(run) {
+  const a = run.artifact;
+  if (a.metric.goal !== "maximize" || a.metric.best !== void 0) return [];
+  const splits = Object.entries(a.splits);
+  for (const [name, split] of splits) {
+    const index = split?.values.findIndex((v) => v > 1) ?? -1;
+    if (index >= 0) {
+      return [
+        {
+          file: run.file,
+          pointer: `/splits/${name}/values/${index}`,
+          expected: "a maximized metric without metric.best must stay at or below 1",
+          got: String(split?.values[index]),
+          hint: "Add metric.best, the best possible value (100 for a 0\u2013100 score), so the error level is best \u2212 value."
+        }
+      ];
+    }
+  }
+  return [];
 }
 async function reviewFiles(options) {
   const cwd = options.cwd ?? ".";
@@ -52592,7 +53422,11 @@ async function reviewFiles(options) {
     throw new InputError(issues2);
   const baseline = b.value;
   const candidate = c.value;
-  const mismatch = sameMetric(baseline, candidate);
+  const mismatch = [
+    ...sameMetric(baseline, candidate),
+    ...bestIssues(baseline),
+    ...bestIssues(candidate)
+  ];
   if (mismatch.length > 0) throw new InputError(mismatch);
   const { paired, notes } = await pairIfBoth(baseline, candidate);
   const review = buildReview({
