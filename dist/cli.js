@@ -23718,18 +23718,6 @@ function pairedT(diffs, alpha) {
   }
   return toResult(tInference(m, variance / n, n - 1, alpha), "paired-t");
 }
-function oneSampleT(values, alpha) {
-  assertAlpha(alpha);
-  checkGroup("values", values);
-  const n = values.length;
-  const df = n - 1;
-  const summary = tInference(mean(values), sampleVariance(values) / n, df, alpha);
-  const { estimate, ci, p } = summary;
-  let pGreater;
-  if (summary.statistic === void 0) pGreater = estimate > 0 ? 0 : estimate === 0 ? 0.5 : 1;
-  else pGreater = tCdf(-summary.statistic, df);
-  return { estimate, ci, pTwoSided: p, pGreater, df };
-}
 function checkGroup(name, values) {
   assertMinLength(name, values, 2);
   assertFiniteValues(name, values);
@@ -23796,6 +23784,56 @@ function mcnemarExact(b, c, n, alpha) {
   return { estimate, ci, p, test: "mcnemar-exact" };
 }
 
+// src/stats/proportion-difference.ts
+function checkRate(x2, xName, n, nName) {
+  assertCount(xName, x2);
+  assertCount(nName, n);
+  if (n === 0) throw new RangeError(`${nName} must be at least 1; got 0`);
+  if (x2 > n) throw new RangeError(`${xName} (${x2}) must not exceed ${nName} (${n})`);
+}
+function boundsAtZ({ x1, n1, x2, n2 }, z) {
+  const p1 = x1 / n1;
+  const p2 = x2 / n2;
+  const [l1, u1] = wilsonAtZ(x1, n1, z);
+  const [l2, u2] = wilsonAtZ(x2, n2, z);
+  const delta = p2 - p1;
+  return [delta - Math.hypot(p2 - l2, u1 - p1), delta + Math.hypot(u2 - p2, p1 - l1)];
+}
+function newcombeInterval(x1, n1, x2, n2, alpha) {
+  assertAlpha(alpha);
+  checkRate(x1, "x1", n1, "n1");
+  checkRate(x2, "x2", n2, "n2");
+  return boundsAtZ({ x1, n1, x2, n2 }, normalQuantile(1 - alpha / 2));
+}
+function newcombeDifference(x1, n1, x2, n2, alpha) {
+  const ci = newcombeInterval(x1, n1, x2, n2, alpha);
+  const counts = { x1, n1, x2, n2 };
+  const estimate = x2 / n2 - x1 / n1;
+  if (estimate === 0) return { estimate, ci, p: 1, statistic: 0, test: "newcombe-score" };
+  const zStar = crossingZ(counts, estimate > 0);
+  const p = Math.min(1, 2 * normalCdf(-zStar));
+  return { estimate, ci, p, statistic: Math.sign(estimate) * zStar, test: "newcombe-score" };
+}
+function crossingZ(counts, positive) {
+  const beyond = (z) => {
+    const [low, high] = boundsAtZ(counts, z);
+    return positive ? low <= 0 : high >= 0;
+  };
+  let lo = 0;
+  let hi = 1;
+  while (!beyond(hi)) {
+    lo = hi;
+    hi *= 2;
+    if (hi > 1e12) return hi;
+  }
+  for (let i2 = 0; i2 < 200 && hi - lo > 1e-13 * hi; i2++) {
+    const mid = (lo + hi) / 2;
+    if (beyond(mid)) hi = mid;
+    else lo = mid;
+  }
+  return (lo + hi) / 2;
+}
+
 // src/stats/holm.ts
 function holmAdjust(p) {
   const present = [];
@@ -23818,20 +23856,6 @@ function holmAdjust(p) {
 }
 
 // src/stats/non-inferiority.ts
-function welchWorsening(baseline, candidate) {
-  for (const [name, values] of [
-    ["baseline", baseline],
-    ["candidate", candidate]
-  ]) {
-    assertMinLength(name, values, 2);
-    assertFiniteValues(name, values);
-  }
-  const v1 = sampleVariance(baseline) / baseline.length;
-  const v2 = sampleVariance(candidate) / candidate.length;
-  const se2 = v1 + v2;
-  const df = se2 === 0 ? baseline.length + candidate.length - 2 : se2 * se2 / (v1 * v1 / (baseline.length - 1) + v2 * v2 / (candidate.length - 1));
-  return { estimate: mean(candidate) - mean(baseline), se: Math.sqrt(se2), df };
-}
 function upperTail(statistic, df) {
   return df === null ? normalCdf(-statistic) : tCdf(-statistic, df);
 }
@@ -23905,8 +23929,304 @@ function logRatio(baseline, candidate, alpha) {
   };
 }
 
+// src/stats/split-noise.ts
+var ROUNDOFF_RELATIVE = 1e-12;
+function binomialSamplingVariance(rate, examples) {
+  assertProbability("rate", rate);
+  if (!Number.isSafeInteger(examples) || examples < 1) {
+    throw new RangeError(`examples must be a positive integer; got ${examples}`);
+  }
+  if (rate > 0 && rate < 1) {
+    return { variance: rate * (1 - rate) / examples, df: Infinity, source: "binomial" };
+  }
+  const adjusted = (examples * rate + 2) / (examples + 4);
+  return {
+    variance: adjusted * (1 - adjusted) / (examples + 4),
+    df: Infinity,
+    source: "binomial"
+  };
+}
+function splitNoise(input) {
+  const { values } = input;
+  if (values.length === 0) throw new RangeError("splitNoise needs at least one value");
+  assertFiniteValues("values", values);
+  const rows = input.evaluationRows ?? "fixed";
+  const k = values.length;
+  const m = mean(values);
+  const sampling = usable(input.sampling);
+  const samplingCode = sampling ? sampling.source : "unknown";
+  const spread = k >= 2 ? spreadVariance(values) : NaN;
+  const seed = k < 2 ? "one-repeat" : spread === 0 ? "zero-spread" : "spread";
+  let perRepeat2 = { variance: 0, df: Infinity };
+  let fixed2 = { variance: 0, df: Infinity };
+  let floored = false;
+  const missing = [];
+  if (k >= 2) perRepeat2 = { variance: spread, df: k - 1 };
+  else missing.push("seed");
+  if (!sampling && (rows === "fixed" || k < 2)) missing.push("sampling");
+  if (rows === "fixed") {
+    if (sampling) fixed2 = { variance: sampling.variance, df: sampling.df };
+  } else {
+    if (sampling && !(k >= 2 && spread >= sampling.variance)) {
+      floored = k >= 2;
+      perRepeat2 = { variance: sampling.variance, df: sampling.df };
+    }
+  }
+  const parts = [
+    { variance: perRepeat2.variance / k, df: perRepeat2.df },
+    { variance: fixed2.variance, df: fixed2.df }
+  ];
+  const variance = parts[0].variance + parts[1].variance;
+  const known = variance > 0 && Number.isFinite(variance);
+  const basis = { rows, seed, sampling: samplingCode, floored, missing };
+  return {
+    mean: m,
+    repeats: k,
+    variance: known ? variance : NaN,
+    df: known ? satterthwaite(parts) : NaN,
+    known,
+    perRepeat: perRepeat2,
+    fixed: fixed2,
+    basis
+  };
+}
+function usable(s) {
+  if (!s || !(s.variance > 0 && Number.isFinite(s.variance))) return null;
+  if (!(s.df > 0)) throw new RangeError(`sampling df must be > 0; got ${s.df}`);
+  return s;
+}
+function spreadVariance(values) {
+  const s2 = sampleVariance(values);
+  const scale = Math.max(...values.map(Math.abs));
+  return Math.sqrt(s2) <= ROUNDOFF_RELATIVE * scale ? 0 : s2;
+}
+function satterthwaite(parts) {
+  let total = 0;
+  let denominator = 0;
+  for (const { variance, df } of parts) {
+    if (!(variance >= 0) || !(df > 0)) {
+      throw new RangeError(`each part needs variance >= 0 and df > 0; got ${variance}, ${df}`);
+    }
+    total += variance;
+    if (variance > 0 && Number.isFinite(df)) denominator += variance * variance / df;
+  }
+  if (total === 0) return NaN;
+  return denominator === 0 ? Infinity : total * total / denominator;
+}
+function compareSplitMeans(baseline, candidate, alpha) {
+  assertAlpha(alpha);
+  const estimate = candidate.mean - baseline.mean;
+  if (!baseline.known || !candidate.known) return { estimate, ci: null, p: null, test: "none" };
+  const variance = baseline.variance + candidate.variance;
+  const df = satterthwaite([
+    { variance: baseline.variance, df: baseline.df },
+    { variance: candidate.variance, df: candidate.df }
+  ]);
+  const se = Math.sqrt(variance);
+  const statistic = estimate / se;
+  const half = tQuantile(1 - alpha / 2, df) * se;
+  const p = Math.min(1, 2 * tCdf(-Math.abs(statistic), df));
+  const test2 = df === Infinity ? "z-binomial" : "welch-t";
+  return {
+    estimate,
+    ci: [estimate - half, estimate + half],
+    p,
+    test: test2,
+    statistic,
+    ...df === Infinity ? {} : { df }
+  };
+}
+
 // src/stats/noncentral-t.ts
 var import_jstat2 = __toESM(require_jstat(), 1);
+var NORMAL_DF2 = 1e7;
+var NODES = 1e3;
+var cache = /* @__PURE__ */ new Map();
+function quadrature(df) {
+  const hit = cache.get(df);
+  if (hit) return hit;
+  const spread = 1 / Math.sqrt(2 * df);
+  const lo = Math.max(0, 1 - 10 * spread);
+  const hi = Math.sqrt((df + 12 * Math.sqrt(2 * df) + 60) / df);
+  const graded = lo === 0;
+  const s = new Float64Array(NODES);
+  const w = new Float64Array(NODES);
+  const logConst = Math.log(2 * df) - df / 2 * Math.log(2) - import_jstat2.default.gammaln(df / 2);
+  let total = 0;
+  for (let i2 = 0; i2 < NODES; i2++) {
+    const x2 = (i2 + 0.5) / NODES;
+    const si = graded ? lo + (hi - lo) * x2 * x2 : lo + (hi - lo) * x2;
+    const dsdx = graded ? 2 * (hi - lo) * x2 : hi - lo;
+    const v = df * si * si;
+    const logDensity = logConst + Math.log(si) + (df / 2 - 1) * Math.log(v) - v / 2;
+    s[i2] = si;
+    w[i2] = Math.exp(logDensity) * dsdx / NODES;
+    total += w[i2];
+  }
+  for (let i2 = 0; i2 < NODES; i2++) w[i2] = w[i2] / total;
+  if (cache.size > 64) cache.clear();
+  cache.set(df, { s, w });
+  return { s, w };
+}
+function tTestPower(ncp, df, alpha) {
+  if (!Number.isFinite(ncp)) throw new RangeError(`noncentrality must be finite; got ${ncp}`);
+  if (!(df >= 1)) throw new RangeError(`degrees of freedom must be >= 1; got ${df}`);
+  const lambda = Math.abs(ncp);
+  if (df > NORMAL_DF2) {
+    const z = normalQuantile(1 - alpha / 2);
+    return normalCdf(lambda - z) + normalCdf(-lambda - z);
+  }
+  const c = tQuantile(1 - alpha / 2, df);
+  const { s, w } = quadrature(df);
+  let power = 0;
+  for (let i2 = 0; i2 < NODES; i2++) {
+    const cs = c * s[i2];
+    power += w[i2] * (normalCdf(lambda - cs) + normalCdf(-lambda - cs));
+  }
+  return Math.min(1, Math.max(0, power));
+}
+function noncentralityFor(power, df, alpha) {
+  if (!(power > alpha / 2 && power < 1)) {
+    throw new RangeError(`power must be in (alpha/2, 1); got ${power}`);
+  }
+  const f = (lambda) => tTestPower(lambda, df, alpha) - power;
+  const guess = df > NORMAL_DF2 ? normalQuantile(1 - alpha / 2) + normalQuantile(power) : tQuantile(1 - alpha / 2, df) + tQuantile(power, df);
+  let a = Math.max(0, guess * 0.9);
+  let fa = f(a);
+  while (fa > 0 && a > 0) {
+    a = a > 1e-3 ? a / 2 : 0;
+    fa = f(a);
+  }
+  if (fa > 0) return 0;
+  let b = Math.max(guess * 1.1, a + 1e-3);
+  let fb = f(b);
+  while (fb < 0) {
+    a = b;
+    fa = fb;
+    b *= 2;
+    if (b > 1e8) throw new RangeError("power cannot be reached");
+    fb = f(b);
+  }
+  let side = 0;
+  for (let i2 = 0; i2 < 100 && b - a > 1e-10 * b; i2++) {
+    const c = (a * fb - b * fa) / (fb - fa);
+    const fc = f(c);
+    if (fc === 0) return c;
+    if (fc < 0) {
+      a = c;
+      fa = fc;
+      if (side === -1) fb /= 2;
+      side = -1;
+    } else {
+      b = c;
+      fb = fc;
+      if (side === 1) fa /= 2;
+      side = 1;
+    }
+  }
+  return (a + b) / 2;
+}
+
+// src/stats/power.ts
+var MAX_REPEATS = 1e3;
+function assertPower(power, alpha) {
+  if (!(power > alpha / 2 && power < 1)) {
+    throw new RangeError(`power must be in (alpha/2, 1), e.g. 0.8; got ${power}`);
+  }
+}
+function mdeMeans(baseline, candidate, alpha, power = 0.8) {
+  assertAlpha(alpha);
+  assertPower(power, alpha);
+  if (!baseline.known || !candidate.known) return null;
+  const df = satterthwaite([
+    { variance: baseline.variance, df: baseline.df },
+    { variance: candidate.variance, df: candidate.df }
+  ]);
+  return noncentralityFor(power, df, alpha) * Math.sqrt(baseline.variance + candidate.variance);
+}
+function repeatsNeeded(delta, baseline, candidate, alpha, power = 0.8) {
+  assertAlpha(alpha);
+  assertPower(power, alpha);
+  assertFinite("delta", delta);
+  if (delta === 0) return { repeats: null, reason: "no-change" };
+  const arms = [baseline, candidate];
+  if (arms.some((a) => !a.known)) return { repeats: null, reason: "noise-unknown" };
+  const lowerBound = arms.some((a) => a.basis.missing.length > 0);
+  const target = Math.abs(delta);
+  const fixedOnly = arms.reduce((s, a) => s + a.fixed.variance, 0);
+  if (fixedOnly > 0) {
+    const dfFixed = satterthwaite(arms.map((a) => a.fixed).filter((f) => f.variance > 0));
+    if (tTestPower(target / Math.sqrt(fixedOnly), dfFixed, alpha) < power) {
+      return { repeats: null, reason: "fixed-noise" };
+    }
+  }
+  const reaches = (k) => {
+    const parts = arms.flatMap((a) => {
+      const seedDf = a.basis.seed === "spread" && !a.basis.floored ? k - 1 : a.perRepeat.df;
+      return [
+        { variance: a.perRepeat.variance / k, df: seedDf },
+        { variance: a.fixed.variance, df: a.fixed.df }
+      ];
+    });
+    const variance = parts.reduce((s, p) => s + p.variance, 0);
+    return tTestPower(target / Math.sqrt(variance), satterthwaite(parts), alpha) >= power;
+  };
+  if (reaches(2)) return { repeats: 2, lowerBound };
+  let lo = 2;
+  let hi = 4;
+  while (!reaches(hi)) {
+    if (hi >= MAX_REPEATS) return { repeats: null, reason: "beyond-limit" };
+    lo = hi;
+    hi = Math.min(MAX_REPEATS, hi * 2);
+  }
+  while (hi - lo > 1) {
+    const mid = Math.floor((lo + hi) / 2);
+    if (reaches(mid)) hi = mid;
+    else lo = mid;
+  }
+  return { repeats: hi, lowerBound };
+}
+function twoProportionPower(p1, p2, n1, n2, alpha) {
+  const pooled = (n1 * p1 + n2 * p2) / (n1 + n2);
+  const sdNull = Math.sqrt(pooled * (1 - pooled) * (1 / n1 + 1 / n2));
+  const sdAlt = Math.sqrt(p1 * (1 - p1) / n1 + p2 * (1 - p2) / n2);
+  if (sdAlt === 0) return p1 === p2 ? alpha : 1;
+  const z = normalQuantile(1 - alpha / 2);
+  const d = Math.abs(p2 - p1);
+  return normalCdf((d - z * sdNull) / sdAlt) + normalCdf((-d - z * sdNull) / sdAlt);
+}
+function mdeTwoProportions(p1, n1, n2, alpha, power = 0.8) {
+  assertAlpha(alpha);
+  assertPower(power, alpha);
+  assertProbability("p1", p1);
+  assertRows("n1", n1);
+  assertRows("n2", n2);
+  const solve = (end) => {
+    const at = (t) => twoProportionPower(p1, p1 + t * (end - p1), n1, n2, alpha);
+    if (end === p1 || at(1) < power) return null;
+    const steps = 256;
+    let prev = 0;
+    for (let i2 = 1; i2 <= steps; i2++) {
+      const t = i2 / steps;
+      if (at(t) >= power) {
+        let lo = prev;
+        let hi = t;
+        for (let j = 0; j < 60; j++) {
+          const mid = (lo + hi) / 2;
+          if (at(mid) >= power) hi = mid;
+          else lo = mid;
+        }
+        return hi * Math.abs(end - p1);
+      }
+      prev = t;
+    }
+    return null;
+  };
+  return { increase: solve(1), decrease: solve(0) };
+}
+function assertRows(name, n) {
+  if (!(n > 0) || !Number.isFinite(n)) throw new RangeError(`${name} must be > 0; got ${n}`);
+}
 
 // src/analysis/measure.ts
 function shortfallSign(run) {
@@ -23932,22 +24252,42 @@ function perRepeat(run, measure) {
   }
   return out;
 }
-function binomialMeasureVariance(run, measure) {
-  if (run.metric.kind !== "proportion") return null;
-  let total = 0;
+function splitSampling(run, split, examples = {}) {
+  const s = run.splits[split];
+  if (s === void 0) return null;
+  if (run.metric.kind === "proportion" && s.examples !== void 0) {
+    const rate = Math.round(Math.min(1, Math.max(0, mean(s.values))) * s.examples) / s.examples;
+    return binomialSamplingVariance(rate, s.examples);
+  }
+  return examples[split] ?? null;
+}
+function measureSampling(run, measure, examples = {}) {
+  const parts = [];
+  let perRepeatRows = true;
+  let known = true;
+  let source = "binomial";
   for (const term of measure.terms) {
     const split = run.splits[term.split];
-    if (split?.examples === void 0) return null;
-    const repeats = split.values.length;
-    total += term.weight * term.weight * binomialVariance(mean(split.values), split.examples * repeats);
+    if ((split?.evaluationRows ?? "fixed") !== "per-repeat") perRepeatRows = false;
+    const s = splitSampling(run, term.split, examples);
+    if (s === null || !(s.variance > 0)) {
+      known = false;
+      continue;
+    }
+    if (s.source === "per-example") source = "per-example";
+    parts.push({ variance: term.weight * term.weight * s.variance, df: s.df });
   }
-  return total;
+  const rows = perRepeatRows ? "per-repeat" : "fixed";
+  if (!known || parts.length === 0) return { sampling: null, rows };
+  const variance = parts.reduce((a, p) => a + p.variance, 0);
+  return { sampling: { variance, df: satterthwaite(parts), source }, rows };
 }
 
 // src/analysis/noise.ts
 function callOf(result, settings) {
+  if (result.p === null) return "undetermined";
   const big = Math.abs(result.estimate) >= settings.minEffect && result.estimate !== 0;
-  const significant = result.p === null ? settings.minEffect > 0 : result.p < settings.alpha;
+  const significant = result.p < settings.alpha;
   if (!big || !significant) return "flat";
   return result.estimate > 0 ? "up" : "down";
 }
@@ -23966,32 +24306,55 @@ function deltaFields(result, settings) {
     call: callOf(result, settings)
   };
 }
-function measureChange(baseline, candidate, measure, alpha) {
-  const b = perRepeat(baseline, measure.baseline);
-  const c = perRepeat(candidate, measure.candidate);
-  if (b === null || c === null) return null;
-  const estimate = mean(c) - mean(b);
-  if (b.length >= 2 && c.length >= 2) return welchT(b, c, alpha);
-  const vb = binomialMeasureVariance(baseline, measure.baseline);
-  const vc = binomialMeasureVariance(candidate, measure.candidate);
-  if (vb !== null && vc !== null) return normalTest(estimate, vb + vc, alpha, "z-binomial");
-  return { estimate, ci: null, p: null, test: "none" };
-}
-function measureLevel(run, measure, alpha) {
+function measureNoise(run, measure, examples = {}) {
   const values = perRepeat(run, measure);
   if (values === null) return null;
-  const value2 = mean(values);
-  if (values.length >= 2) {
-    const t = oneSampleT(values, alpha);
-    return { value: value2, ci: t.ci, p: t.pGreater };
-  }
-  const variance = binomialMeasureVariance(run, measure);
-  if (variance !== null) {
-    const z = normalTest(value2, variance, alpha, "z-binomial");
-    const p = variance > 0 ? 1 - normalCdf(value2 / Math.sqrt(variance)) : value2 > 0 ? 0 : 1;
-    return { value: value2, ci: z.ci, p };
-  }
-  return { value: value2, ci: null, p: null };
+  const { sampling, rows } = measureSampling(run, measure, examples);
+  return splitNoise({ values, sampling, evaluationRows: rows });
+}
+function measureChange(baseline, candidate, measure, alpha, examples = {}) {
+  const b = measureNoise(baseline, measure.baseline, examples.baseline);
+  const c = measureNoise(candidate, measure.candidate, examples.candidate);
+  if (b === null || c === null) return null;
+  const newcombe = newcombeChange(baseline, candidate, measure, alpha);
+  if (newcombe !== null) return newcombe;
+  return compareSplitMeans(b, c, alpha);
+}
+function newcombeChange(baseline, candidate, measure, alpha) {
+  const counts = (run, m) => {
+    const term = m.terms[0];
+    if (run.metric.kind !== "proportion" || m.terms.length !== 1 || m.constant !== 0) return null;
+    if (term === void 0 || term.weight !== 1) return null;
+    const split = run.splits[term.split];
+    if (split?.examples === void 0 || split.values.length !== 1) return null;
+    const value2 = split.values[0] ?? Number.NaN;
+    if (!(value2 >= 0 && value2 <= 1)) return null;
+    const rate = shortfallSign(run) === 1 ? value2 : 1 - value2;
+    return { x: Math.round(rate * split.examples), n: split.examples };
+  };
+  const b = counts(baseline, measure.baseline);
+  const c = counts(candidate, measure.candidate);
+  if (b === null || c === null) return null;
+  const r = newcombeDifference(b.x, b.n, c.x, c.n, alpha);
+  const sign = shortfallSign(candidate);
+  const estimate = sign * ((candidate.splits[measure.candidate.terms[0].split]?.values[0] ?? 0) - (baseline.splits[measure.baseline.terms[0].split]?.values[0] ?? 0));
+  const shift = estimate - r.estimate;
+  return {
+    estimate,
+    ci: [r.ci[0] + shift, r.ci[1] + shift],
+    p: r.p,
+    test: "newcombe-score",
+    statistic: r.statistic
+  };
+}
+function measureLevel(run, measure, alpha, examples = {}) {
+  const noise = measureNoise(run, measure, examples);
+  if (noise === null) return null;
+  const value2 = noise.mean;
+  if (!noise.known) return { value: value2, ci: null, p: null };
+  const se = Math.sqrt(noise.variance);
+  const half = tQuantile(1 - alpha / 2, noise.df) * se;
+  return { value: value2, ci: [value2 - half, value2 + half], p: 1 - tCdf(value2 / se, noise.df) };
 }
 function toMetricUnits(result, sign) {
   if (sign === 1) return result;
@@ -24004,12 +24367,54 @@ function toMetricUnits(result, sign) {
 }
 
 // src/analysis/decompose.ts
+function bestOf(run) {
+  return run.metric.best ?? (run.metric.goal === "maximize" ? 1 : 0);
+}
+function defaultReference(run) {
+  return run.metric.kind === "proportion" ? bestOf(run) : null;
+}
 function chooseReference(run, override) {
   if (override !== void 0) return { value: override, source: "config" };
   if (run.reference !== void 0) return { value: run.reference, source: "artifact" };
-  if (run.metric.kind === "proportion" && run.metric.goal === "minimize")
-    return { value: 0, source: "default" };
-  return { value: null, source: "unknown" };
+  const value2 = defaultReference(run);
+  return value2 === null ? { value: value2, source: "unknown" } : { value: value2, source: "default" };
+}
+function taskReference(baseline, candidate, override) {
+  const none = { fromOneRun: null, differ: null };
+  if (override !== void 0) {
+    const c = { value: override, source: "config" };
+    return { baseline: c, candidate: c, ...none };
+  }
+  const rb = baseline.reference;
+  const rc = candidate.reference;
+  if (rb !== void 0 && rc !== void 0) {
+    const differ = rb === rc ? null : { baseline: rb, candidate: rc };
+    return {
+      baseline: { value: rc, source: rb === rc ? "artifact" : "other-run" },
+      candidate: { value: rc, source: "artifact" },
+      fromOneRun: null,
+      differ
+    };
+  }
+  if (rb !== void 0)
+    return {
+      baseline: { value: rb, source: "artifact" },
+      candidate: { value: rb, source: "other-run" },
+      fromOneRun: { from: "baseline", value: rb },
+      differ: null
+    };
+  if (rc !== void 0)
+    return {
+      baseline: { value: rc, source: "other-run" },
+      candidate: { value: rc, source: "artifact" },
+      fromOneRun: { from: "candidate", value: rc },
+      differ: null
+    };
+  return {
+    baseline: chooseReference(baseline, void 0),
+    candidate: chooseReference(candidate, void 0),
+    ...none
+  };
 }
 function componentMeasures(run, reference) {
   const sign = shortfallSign(run);
@@ -24041,20 +24446,20 @@ function componentMeasures(run, reference) {
 }
 function errorLevel(run) {
   const m = mean(run.splits.validation.values);
-  return Math.abs(run.metric.goal === "minimize" ? m : 1 - m);
+  return Math.abs(m - bestOf(run));
 }
 var UNAVAILABLE = /* @__PURE__ */ new Map([
   ["bias", "no-reference"],
   ["mismatch", "no-train-dev"],
   ["overfit", "no-test"]
 ]);
-function decompose(run, reference, settings) {
+function decompose(run, reference, settings, examples = {}) {
   const measures = componentMeasures(run, reference);
   const threshold = Math.max(settings.gapTolerance * errorLevel(run), settings.minEffect);
   const out = {};
   for (const name of ["bias", "variance", "mismatch", "overfit"]) {
     const measure = measures[name];
-    const level = measure === null ? null : measureLevel(run, measure, settings.alpha);
+    const level = measure === null ? null : measureLevel(run, measure, settings.alpha, examples);
     if (level === null) {
       const unavailable = UNAVAILABLE.get(name);
       if (unavailable === void 0) throw new Error(`${name} needs splits every run has`);
@@ -24087,8 +24492,22 @@ function diagnose(components) {
 function both(measure) {
   return { baseline: measure, candidate: measure };
 }
-function pairedTest(paired, run, alpha) {
-  if (paired.rows === 0) return null;
+function lossScale(paired, run) {
+  const side = paired.sides?.baseline;
+  if (side === void 0 || !(side.mean > 0) || side.n < 1) return null;
+  const aggregate = paired.aggregate ?? "mean";
+  const m = side.mean;
+  const agg = aggregate === "mean" ? m : aggregate === "sum" ? side.n * m : Math.sqrt(m);
+  const slope2 = aggregate === "mean" ? 1 : aggregate === "sum" ? side.n : 1 / (2 * Math.sqrt(m));
+  if (run.metric.goal === "minimize") return slope2;
+  const split = run.splits[paired.split ?? "validation"];
+  const value2 = split?.values[paired.repeat ?? 0];
+  if (value2 === void 0) return null;
+  const shortfall = bestOf(run) - value2;
+  return shortfall > 0 ? slope2 * shortfall / agg : null;
+}
+function pairedShortfall(paired, baselineRun, alpha) {
+  if (paired.rows === 0 || paired.partial === true) return null;
   if (paired.kind === "proportion") {
     const result = mcnemarExact(
       paired.baselineOnly ?? 0,
@@ -24096,23 +24515,38 @@ function pairedTest(paired, run, alpha) {
       paired.rows,
       alpha
     );
-    return run.metric.goal === "minimize" ? toMetricUnits(result, -1) : result;
+    return toMetricUnits(result, -1);
   }
-  return pairedT(
+  const scale = lossScale(paired, baselineRun);
+  if (scale === null) return null;
+  const r = pairedT(
     { n: paired.rows, mean: paired.meanDiff ?? 0, variance: paired.varDiff ?? 0 },
     alpha
   );
+  return {
+    ...r,
+    estimate: r.estimate * scale,
+    ci: r.ci === null ? null : [r.ci[0] * scale, r.ci[1] * scale]
+  };
 }
-function splitShortfalls(runs, alpha, paired) {
+function repeatsDecide(runs, split) {
+  return (runs.baseline.splits[split]?.values.length ?? 0) >= 2 && (runs.candidate.splits[split]?.values.length ?? 0) >= 2;
+}
+function splitShortfalls(runs, alpha, paired, examples = {}) {
   const pairedSplit = paired?.split ?? "validation";
-  const sign = shortfallSign(runs.candidate);
   const out = /* @__PURE__ */ new Map();
   for (const split of SPLIT_NAMES) {
-    let result = measureChange(runs.baseline, runs.candidate, both(splitMeasure(split)), alpha);
+    let result = measureChange(
+      runs.baseline,
+      runs.candidate,
+      both(splitMeasure(split)),
+      alpha,
+      examples
+    );
     if (result === null) continue;
-    if (paired !== void 0 && split === pairedSplit && (result.test === "none" || result.test === "z-binomial")) {
-      const test2 = pairedTest(paired, runs.candidate, alpha);
-      if (test2 !== null) result = toMetricUnits(test2, sign);
+    if (paired !== void 0 && split === pairedSplit && !repeatsDecide(runs, split)) {
+      const test2 = pairedShortfall(paired, runs.baseline, alpha);
+      if (test2 !== null) result = test2;
     }
     out.set(split, result);
   }
@@ -24134,7 +24568,7 @@ function splitChanges(shortfalls, runs, summaries, calls) {
   }
   return out;
 }
-function componentChanges(runs, references, calls) {
+function componentChanges(runs, references, calls, examples = {}) {
   const { baseline, candidate } = runs;
   const alpha = calls.alpha;
   const refB = references.baseline;
@@ -24147,17 +24581,18 @@ function componentChanges(runs, references, calls) {
       baseline: componentMeasures(baseline, biasRefB).bias ?? splitMeasure("train"),
       candidate: componentMeasures(candidate, biasRefC).bias ?? splitMeasure("train")
     },
-    alpha
+    alpha,
+    examples
   );
   const change2 = (name) => {
     const mb = componentMeasures(baseline, refB)[name];
     const mc = componentMeasures(candidate, refC)[name];
     if (mb === null || mc === null) return null;
-    const r = measureChange(baseline, candidate, { baseline: mb, candidate: mc }, alpha);
+    const r = measureChange(baseline, candidate, { baseline: mb, candidate: mc }, alpha, examples);
     return r === null ? null : toShortfallDelta(r, calls);
   };
   const varianceFallback = baseline.splits.train_dev === void 0 !== (candidate.splits.train_dev === void 0);
-  const variance = varianceFallback ? validationMinusTrain(runs, calls) : change2("variance");
+  const variance = varianceFallback ? validationMinusTrain(runs, calls, examples) : change2("variance");
   if (variance === null)
     throw new Error("variance needs train and validation, which the schema requires");
   return {
@@ -24168,7 +24603,7 @@ function componentChanges(runs, references, calls) {
     varianceFallback
   };
 }
-function validationMinusTrain(runs, calls) {
+function validationMinusTrain(runs, calls, examples) {
   const measure = {
     terms: [
       { split: "validation", weight: 1 },
@@ -24176,7 +24611,7 @@ function validationMinusTrain(runs, calls) {
     ],
     constant: 0
   };
-  const r = measureChange(runs.baseline, runs.candidate, both(measure), calls.alpha);
+  const r = measureChange(runs.baseline, runs.candidate, both(measure), calls.alpha, examples);
   return r === null ? null : toShortfallDelta(r, calls);
 }
 
@@ -24205,6 +24640,65 @@ function reviewCost(baseline, candidate, alpha) {
     };
   }
   return out;
+}
+
+// src/analysis/power.ts
+function sideNoise(paired, run, side) {
+  const stats = paired.sides?.[side];
+  const split = paired.split ?? "validation";
+  const values = run.splits[split]?.values;
+  if (stats === void 0 || values === void 0 || stats.n < 2) return {};
+  let sampling = null;
+  if (paired.kind === "proportion") {
+    const rate = Math.min(1, Math.max(0, mean(values)));
+    sampling = binomialSamplingVariance(rate, stats.n);
+  } else {
+    const scale = lossScale({ ...paired, sides: { baseline: stats, candidate: stats } }, run);
+    if (scale === null || !(stats.variance > 0)) return {};
+    sampling = {
+      variance: stats.variance / stats.n * scale * scale,
+      df: stats.n - 1,
+      source: "per-example"
+    };
+  }
+  return { [split]: sampling };
+}
+function exampleNoise(runs, paired) {
+  if (paired?.sides === void 0) return {};
+  return {
+    baseline: sideNoise(paired, runs.baseline, "baseline"),
+    candidate: sideNoise(paired, runs.candidate, "candidate")
+  };
+}
+function validationPower(runs, shortfall, alpha, examples) {
+  const measure = splitMeasure("validation");
+  const b = measureNoise(runs.baseline, measure, examples.baseline);
+  const c = measureNoise(runs.candidate, measure, examples.candidate);
+  if (b === null || c === null) throw new Error("validation split is required by the schema");
+  const atLeast = b.basis.missing.length > 0 || c.basis.missing.length > 0;
+  let mde = null;
+  if (shortfall.test === "newcombe-score") {
+    const nb = runs.baseline.splits.validation.examples ?? 0;
+    const nc = runs.candidate.splits.validation.examples ?? 0;
+    const value2 = runs.baseline.splits.validation.values[0] ?? 0;
+    const rate = shortfallSign(runs.baseline) === 1 ? value2 : 1 - value2;
+    const both2 = mdeTwoProportions(Math.min(1, Math.max(0, rate)), nb, nc, alpha);
+    const found = [both2.increase, both2.decrease].filter((x2) => x2 !== null);
+    if (found.length > 0)
+      mde = { value: Math.min(...found), method: "fleiss-two-proportions", atLeast };
+  } else {
+    const value2 = mdeMeans(b, c, alpha);
+    if (value2 !== null) {
+      mde = {
+        value: value2,
+        method: b.df === Infinity && c.df === Infinity ? "normal" : "welch-noncentral-t",
+        atLeast
+      };
+    }
+  }
+  const r = repeatsNeeded(shortfall.estimate, b, c, alpha);
+  const needed = r.repeats === null ? { repeats: null, lowerBound: false, reason: r.reason } : { repeats: r.repeats, lowerBound: r.lowerBound, reason: null };
+  return { mde, repeatsNeeded: needed };
 }
 
 // src/analysis/gate.ts
@@ -24287,36 +24781,37 @@ function applyGate(review2, failOn) {
 
 // src/analysis/guardrails.ts
 var worseSign = (g) => g.metric.goal === "minimize" ? 1 : -1;
+function noiseOf(g, split, sign) {
+  const m = mean(split.values);
+  const sampling = g.metric.kind === "proportion" && split.examples !== void 0 && m >= 0 && m <= 1 ? { variance: binomialVariance(m, split.examples), df: Infinity, source: "binomial" } : null;
+  return splitNoise({
+    values: split.values.map((v) => sign * v),
+    sampling,
+    evaluationRows: split.evaluationRows ?? "fixed"
+  });
+}
 function test(b, c, alpha) {
-  const bs = b.splits.validation;
-  const cs = c.splits.validation;
-  const estimate = mean(cs.values) - mean(bs.values);
   const sign = worseSign(c);
-  if (bs.values.length >= 2 && cs.values.length >= 2) {
-    const t = welchT(bs.values, cs.values, alpha);
-    const w = welchWorsening(
-      bs.values.map((v) => sign * v),
-      cs.values.map((v) => sign * v)
-    );
-    return { change: changeOf(t.estimate, t.ci, t.p, "welch-t", sign, alpha), worsening: w };
-  }
-  const variance = binomial(b, bs) !== null && binomial(c, cs) !== null;
-  if (variance) {
-    const v = binomial(b, bs) + binomial(c, cs);
-    const z = normalTest(estimate, v, alpha, "z-binomial");
+  const nb = noiseOf(b, b.splits.validation, sign);
+  const nc = noiseOf(c, c.splits.validation, sign);
+  const estimate = mean(c.splits.validation.values) - mean(b.splits.validation.values);
+  const r = compareSplitMeans(nb, nc, alpha);
+  if (r.ci === null || r.p === null || r.test === "none") {
     return {
-      change: changeOf(estimate, z.ci, z.p, "z-binomial", sign, alpha),
-      worsening: { estimate: sign * estimate, se: Math.sqrt(v), df: null }
+      change: { estimate, ci: null, p: null, test: "none", call: "undetermined" },
+      worsening: null
     };
   }
+  const ci = sign === 1 ? r.ci : [-r.ci[1], -r.ci[0]];
+  const testName = r.test === "z-binomial" ? "z-binomial" : "welch-t";
   return {
-    change: { estimate, ci: null, p: null, test: "none", call: "undetermined" },
-    worsening: null
+    change: changeOf(estimate, ci, r.p, testName, sign, alpha),
+    worsening: {
+      estimate: r.estimate,
+      se: Math.sqrt(nb.variance + nc.variance),
+      df: r.df === void 0 ? null : r.df
+    }
   };
-}
-function binomial(g, split) {
-  if (g.metric.kind !== "proportion" || split.examples === void 0) return null;
-  return binomialVariance(mean(split.values), split.examples * split.values.length);
 }
 function changeOf(estimate, ci, p, testName, sign, alpha) {
   const significant = p !== null && p < alpha && estimate !== 0;
@@ -24814,9 +25309,11 @@ var TABLE = {
   up: { down: "toward-underfitting", flat: "toward-underfitting", up: "worse-on-both" }
 };
 function movementOf(biasCall, varianceCall) {
+  if (biasCall === "undetermined" || varianceCall === "undetermined") return "undetermined";
   return TABLE[biasCall][varianceCall];
 }
 function validationChangeOf(shortfallCall) {
+  if (shortfallCall === "undetermined") return "undetermined";
   return shortfallCall === "up" ? "worse" : shortfallCall === "down" ? "better" : "flat";
 }
 
@@ -25659,18 +26156,19 @@ function analyzeRegularization(points2, scale, lambda) {
 }
 
 // src/analysis/run-summary.ts
-function splitSummary(run, split, alpha) {
+function splitSummary(run, split, alpha, examples) {
   const s = run.splits[split];
   if (s === void 0) return null;
   const m = mean(s.values);
   const n = s.values.length;
   const sd = n >= 2 ? Math.sqrt(sampleVariance(s.values)) : null;
   let ci = null;
-  if (sd !== null) {
-    const half = tQuantile(1 - alpha / 2, n - 1) * (sd / Math.sqrt(n));
-    ci = [m - half, m + half];
-  } else if (run.metric.kind === "proportion" && s.examples !== void 0) {
+  const noise = measureNoise(run, splitMeasure(split), examples);
+  if (n === 1 && run.metric.kind === "proportion" && s.examples !== void 0) {
     ci = wilsonInterval(Math.round(m * s.examples), s.examples, alpha);
+  } else if (noise !== null && noise.known) {
+    const half = tQuantile(1 - alpha / 2, noise.df) * Math.sqrt(noise.variance);
+    ci = [m - half, m + half];
   }
   return { split, mean: m, sd, repeats: n, examples: s.examples ?? null, ci };
 }
@@ -25681,9 +26179,13 @@ function regularizationOf(run) {
   }
   return void 0;
 }
-function summarize(run, settings) {
-  const reference = chooseReference(run, settings.reference);
-  const components = decompose(run, reference.value, settings);
+function belowReference(bias, alpha) {
+  if (bias.value === null || !(bias.value < 0)) return false;
+  return bias.p === null || 1 - bias.p < alpha;
+}
+function summarize(run, settings, examples = {}) {
+  const reference = settings.referenceChoice ?? chooseReference(run, settings.reference);
+  const components = decompose(run, reference.value, settings, examples);
   const lambda = regularizationOf(run)?.value;
   return {
     name: run.run.name,
@@ -25691,12 +26193,15 @@ function summarize(run, settings) {
     createdAt: run.run.createdAt ?? null,
     reference: reference.value,
     referenceSource: reference.source,
-    splits: SPLIT_NAMES.flatMap((s) => splitSummary(run, s, settings.alpha) ?? []),
+    splits: SPLIT_NAMES.flatMap((s) => splitSummary(run, s, settings.alpha, examples) ?? []),
     errorLevel: errorLevel(run),
     components,
     diagnosis: diagnose(components),
     biasUnknown: reference.value === null,
-    warnings: components.overfit.present ? ["validation-overfit"] : [],
+    warnings: [
+      ...components.overfit.present ? ["validation-overfit"] : [],
+      ...belowReference(components.bias, settings.alpha) ? ["below-reference"] : []
+    ],
     curves: analyzeCurves(run.curves, {
       ...lambda === void 0 ? {} : { lambda },
       kind: run.metric.kind,
@@ -25776,23 +26281,38 @@ function buildReview(input) {
   const calls = { alpha: settings.alpha, minEffect: settings.minEffect };
   const reference = input.settings.reference;
   const summarySettings = { ...settings, ...reference === void 0 ? {} : { reference } };
-  const base = summarize(baseline, summarySettings);
-  const cand = summarize(candidate, summarySettings);
   const runs = { baseline, candidate };
-  const shortfalls = splitShortfalls(runs, settings.alpha, input.paired);
+  const task = taskReference(baseline, candidate, reference);
+  const examples = exampleNoise(runs, input.paired);
+  const base = summarize(
+    baseline,
+    { ...summarySettings, referenceChoice: task.baseline },
+    examples.baseline
+  );
+  const cand = summarize(
+    candidate,
+    { ...summarySettings, referenceChoice: task.candidate },
+    examples.candidate
+  );
+  const paired = input.paired?.partial === true ? void 0 : input.paired;
+  const shortfalls = splitShortfalls(runs, settings.alpha, paired, examples);
   const validationShortfall = shortfalls.get("validation");
   if (validationShortfall === void 0)
     throw new Error("validation split is required by the schema");
   const components = componentChanges(
     runs,
     { baseline: base.reference, candidate: cand.reference },
-    calls
+    calls,
+    examples
   );
   const movement = movementOf(components.bias?.call ?? "flat", components.variance.call);
+  const change2 = validationChangeOf(toShortfallDelta(validationShortfall, calls).call);
   const validation = {
-    change: validationChangeOf(toShortfallDelta(validationShortfall, calls).call),
-    delta: toMetricDelta(toMetricUnits(validationShortfall, shortfallSign(candidate)), calls)
+    change: change2,
+    delta: toMetricDelta(toMetricUnits(validationShortfall, shortfallSign(candidate)), calls),
+    ...change2 === "flat" || change2 === "undetermined" ? validationPower(runs, validationShortfall, settings.alpha, examples) : {}
   };
+  const pairedDecided = paired !== void 0 && paired.rows > 0 && (validationShortfall.test === "mcnemar-exact" || validationShortfall.test === "paired-t");
   const sliceResult = compareSlices(baseline, candidate, validation.change, calls);
   const noiseUnknown = validation.delta.test === "none" || components.variance.test === "none";
   const changes = diffHyperparameters(baseline.hyperparameters, candidate.hyperparameters);
@@ -25853,14 +26373,30 @@ function buildReview(input) {
         slices: sliceResult.slices,
         noiseUnknown,
         biasUnknown: cand.biasUnknown,
-        paired: input.paired
+        paired: input.paired,
+        task,
+        repeatsDecided: paired !== void 0 && paired.rows > 0 && repeatsDecide(runs, paired.split ?? "validation"),
+        examples
       })
     ],
-    paired: pairedSummary(input.paired)
+    paired: pairedSummary(input.paired, pairedDecided, runs)
   };
 }
 function reviewNotes(facts) {
   const notes = [];
+  if (facts.task.fromOneRun !== null)
+    notes.push({ code: "reference-from-one-run", ...facts.task.fromOneRun });
+  if (facts.task.differ !== null) notes.push({ code: "references-differ", ...facts.task.differ });
+  if (facts.paired?.partial === true) {
+    const sides = facts.paired.sides;
+    notes.push({
+      code: "predictions-partial-overlap",
+      shared: facts.paired.rows,
+      baseline: sides?.baseline.n ?? 0,
+      candidate: sides?.candidate.n ?? 0
+    });
+  }
+  if (facts.repeatsDecided) notes.push({ code: "repeats-decided" });
   if (facts.components.varianceFallback) notes.push({ code: "train-dev-in-one-run" });
   if (facts.unpaired.length > 0) {
     notes.push({
@@ -25879,16 +26415,19 @@ function reviewNotes(facts) {
   }
   if (facts.noiseUnknown) notes.push({ code: "noise-unknown" });
   if (facts.biasUnknown) notes.push({ code: "bias-unknown" });
-  if (facts.paired !== void 0 && facts.paired.rows === 0)
+  if (facts.paired !== void 0 && facts.paired.rows === 0 && facts.paired.partial !== true)
     notes.push({ code: "predictions-share-no-id" });
   return notes;
 }
-function pairedSummary(paired) {
+function pairedSummary(paired, decided, runs) {
   if (paired === void 0) return null;
-  if (paired.kind === "continuous") return { rows: paired.rows, test: "paired-t" };
+  const reason = decided ? null : paired.partial === true ? "partial-overlap" : paired.rows === 0 ? "no-shared-id" : repeatsDecide(runs, paired.split ?? "validation") ? "repeats" : null;
+  if (paired.kind === "continuous")
+    return { rows: paired.rows, test: decided ? "paired-t" : null, reason };
   return {
     rows: paired.rows,
-    test: "mcnemar-exact",
+    test: decided ? "mcnemar-exact" : null,
+    reason,
     discordant: {
       baselineOnly: paired.baselineOnly ?? 0,
       candidateOnly: paired.candidateOnly ?? 0
@@ -26052,6 +26591,8 @@ async function pairPredictions(baseline, candidate, kind) {
   let baselineOnly = 0;
   let candidateOnly = 0;
   const diffs = new RunningStats();
+  const baseAll = new RunningStats();
+  const candAll = new RunningStats();
   const pair = (b2, c) => {
     rows++;
     if (kind === "proportion") {
@@ -26080,6 +26621,8 @@ async function pairPredictions(baseline, candidate, kind) {
         } else waitingCand.set(b.value.id, b.value.value);
       }
     }
+    if (!a.done) baseAll.push(a.value.value);
+    if (!b.done) candAll.push(b.value.value);
     if (!a.done) a = await base.next();
     if (!b.done) b = await cand.next();
   }
@@ -26090,8 +26633,15 @@ async function pairPredictions(baseline, candidate, kind) {
   if (candRepeated.size > 0) issues.push(...await duplicateIssues(candidate, kind, candRepeated));
   if (issues.length > 0) throw new InputError(issues);
   const unmatched = { baseline: waitingBase.size, candidate: waitingCand.size };
-  if (kind === "proportion") return { kind, rows, baselineOnly, candidateOnly, unmatched };
+  const stats = (s) => ({
+    n: s.n,
+    mean: s.n > 0 ? s.mean : 0,
+    variance: s.n > 1 ? s.variance : 0
+  });
+  const sides = { baseline: stats(baseAll), candidate: stats(candAll) };
+  if (kind === "proportion") return { kind, rows, baselineOnly, candidateOnly, unmatched, sides };
   return {
+    sides,
     kind,
     rows,
     meanDiff: diffs.n > 0 ? diffs.mean : 0,
@@ -26523,7 +27073,15 @@ async function pairIfBoth(baseline, candidate) {
   const result = await pairPredictions(baseline.predictions, candidate.predictions, kind);
   const notes = [];
   const { unmatched, ...paired } = result;
-  if (result.rows < MIN_PAIRED_ROWS) {
+  const issues = [
+    ...reproduceIssues(baseline, paired.sides.baseline),
+    ...reproduceIssues(candidate, paired.sides.candidate)
+  ];
+  if (issues.length > 0) throw new InputError(issues);
+  const aggregate = cp.aggregate ?? "mean";
+  const repeat = cp.repeat ?? 0;
+  const partial = unmatched.baseline + unmatched.candidate > 0 && result.rows > 0;
+  if (result.rows < MIN_PAIRED_ROWS && !partial) {
     throw new InputError([
       {
         file: `${baseline.predictions.file} and ${candidate.predictions.file}`,
@@ -26534,7 +27092,7 @@ async function pairIfBoth(baseline, candidate) {
       }
     ]);
   }
-  if (unmatched.baseline + unmatched.candidate > 0) {
+  if (unmatched.baseline + unmatched.candidate > 0 && !partial) {
     notes.push({
       code: "predictions-unmatched",
       rows: result.rows,
@@ -26542,7 +27100,72 @@ async function pairIfBoth(baseline, candidate) {
       candidate: unmatched.candidate
     });
   }
-  return { paired: { ...paired, split: bp.split }, notes };
+  return {
+    paired: { ...paired, split: bp.split, aggregate, repeat, ...partial ? { partial } : {} },
+    notes
+  };
+}
+function reproduceTolerance(value2, rows, kind) {
+  const rounding = Math.max(5e-4, 5e-4 * Math.abs(value2));
+  return kind === "proportion" ? Math.max(rounding, 1 / Math.max(1, rows)) : rounding;
+}
+function reproduceIssues(run, side) {
+  const ref = run.artifact.predictions;
+  if (ref === void 0 || side.n === 0) return [];
+  const metric = run.artifact.metric;
+  const repeat = ref.repeat ?? 0;
+  const values = run.artifact.splits[ref.split]?.values;
+  const pointer = `/splits/${ref.split}/values/${repeat}`;
+  const stated = values?.[repeat];
+  if (stated === void 0) {
+    return [
+      {
+        file: run.file,
+        pointer: "/predictions/repeat",
+        expected: `must name a repeat of split "${ref.split}" (0 to ${(values?.length ?? 1) - 1})`,
+        got: String(repeat)
+      }
+    ];
+  }
+  let computed;
+  if (metric.kind === "proportion") {
+    computed = metric.goal === "maximize" ? side.mean : 1 - side.mean;
+  } else {
+    if (metric.goal === "maximize") return [];
+    const aggregate = ref.aggregate ?? "mean";
+    computed = aggregate === "mean" ? side.mean : aggregate === "sum" ? side.n * side.mean : Math.sqrt(side.mean);
+  }
+  if (Math.abs(computed - stated) <= reproduceTolerance(stated, side.n, metric.kind)) return [];
+  const what = metric.kind === "proportion" ? `the rate of correct = ${metric.goal === "maximize" ? 1 : 0} over ${side.n} rows` : `the ${ref.aggregate ?? "mean"} of loss over ${side.n} rows`;
+  return [
+    {
+      file: run.file,
+      pointer,
+      expected: `must agree with its predictions (${ref.path}): ${what} is ${Number(computed.toPrecision(6))}, the artifact states ${stated}`,
+      got: String(stated),
+      hint: "The predictions must be for this run and this repeat (set predictions.repeat), and for a continuous metric predictions.aggregate must say how loss aggregates to the value."
+    }
+  ];
+}
+function bestIssues(run) {
+  const a = run.artifact;
+  if (a.metric.goal !== "maximize" || a.metric.best !== void 0) return [];
+  const splits = Object.entries(a.splits);
+  for (const [name, split] of splits) {
+    const index = split?.values.findIndex((v) => v > 1) ?? -1;
+    if (index >= 0) {
+      return [
+        {
+          file: run.file,
+          pointer: `/splits/${name}/values/${index}`,
+          expected: "a maximized metric without metric.best must stay at or below 1",
+          got: String(split?.values[index]),
+          hint: "Add metric.best, the best possible value (100 for a 0\u2013100 score), so the error level is best \u2212 value."
+        }
+      ];
+    }
+  }
+  return [];
 }
 async function loadReviewConfig(cwd, config, limits) {
   const configPath = resolve3(cwd, config ?? DEFAULT_CONFIG_PATH);
@@ -26563,7 +27186,11 @@ async function loadReviewConfig(cwd, config, limits) {
   };
 }
 async function reviewLoadedRuns(baseline, candidate, config, overrides) {
-  const mismatch = sameMetric(baseline, candidate);
+  const mismatch = [
+    ...sameMetric(baseline, candidate),
+    ...bestIssues(baseline),
+    ...bestIssues(candidate)
+  ];
   if (mismatch.length > 0) throw new InputError(mismatch);
   const { paired, notes } = await pairIfBoth(baseline, candidate);
   return buildReview({
@@ -31165,9 +31792,9 @@ var handler = {
   set(target, methodName, value2) {
     return target.cache[methodName] = value2;
   },
-  get({ octokit, scope, cache }, methodName) {
-    if (cache[methodName]) {
-      return cache[methodName];
+  get({ octokit, scope, cache: cache2 }, methodName) {
+    if (cache2[methodName]) {
+      return cache2[methodName];
     }
     const method = endpointMethodsMap.get(scope).get(methodName);
     if (!method) {
@@ -31175,7 +31802,7 @@ var handler = {
     }
     const { endpointDefaults, decorations } = method;
     if (decorations) {
-      cache[methodName] = decorate(
+      cache2[methodName] = decorate(
         octokit,
         scope,
         methodName,
@@ -31183,9 +31810,9 @@ var handler = {
         decorations
       );
     } else {
-      cache[methodName] = octokit.request.defaults(endpointDefaults);
+      cache2[methodName] = octokit.request.defaults(endpointDefaults);
     }
-    return cache[methodName];
+    return cache2[methodName];
   }
 };
 function endpointsToMethods(octokit) {
@@ -31904,7 +32531,8 @@ var MOVEMENT_TITLE = words({
   "away-from-overfitting": "away from overfitting",
   "no-significant-change": "no change beyond noise",
   "toward-underfitting": "toward underfitting",
-  "worse-on-both": "more bias and more variance"
+  "worse-on-both": "more bias and more variance",
+  undetermined: "cannot tell: no noise estimate"
 });
 var MOVEMENT_SENTENCE = words({
   "better-on-both": "The change lowered both avoidable bias and variance",
@@ -31913,12 +32541,14 @@ var MOVEMENT_SENTENCE = words({
   "away-from-overfitting": "The change moved the model away from overfitting",
   "no-significant-change": "The change did not move avoidable bias or variance beyond run-to-run noise",
   "toward-underfitting": "The change moved the model toward underfitting",
-  "worse-on-both": "The change raised both avoidable bias and variance"
+  "worse-on-both": "The change raised both avoidable bias and variance",
+  undetermined: "Whether the change moved avoidable bias or variance cannot be told: their noise is unknown"
 });
 var VALIDATION_WORD = words({
   better: "better",
   worse: "worse",
-  flat: "unchanged within noise"
+  flat: "unchanged within noise",
+  undetermined: "undetermined (noise unknown)"
 });
 var DIAGNOSIS_WORD = words({
   "good-fit": "good fit",
@@ -31972,6 +32602,7 @@ var TEST_WORD = words({
   "z-binomial": "binomial z-test",
   "mcnemar-exact": "McNemar's exact test",
   "paired-t": "paired t-test",
+  "newcombe-score": "Newcombe's score interval",
   none: "no test"
 });
 var TEST_WHY = words({
@@ -31979,10 +32610,12 @@ var TEST_WHY = words({
   "z-binomial": "normal approximation with binomial variances: one repeat of a proportion metric measured on a known number of examples.",
   "mcnemar-exact": "McNemar's exact test: both runs scored the same examples, so only the examples on which they disagree carry information.",
   "paired-t": "paired t-test on per-example loss differences: both runs scored the same examples with a continuous loss.",
+  "newcombe-score": "Newcombe's hybrid score interval for a difference of two proportions (Newcombe 1998, method 10), its p-value inverting the interval: one repeat of a proportion metric on a known number of examples.",
   none: "no test: with one repeat of a continuous metric and no paired predictions, run-to-run noise is unknown, so only min-effect decides."
 });
 var REFERENCE_SOURCE = words({
   artifact: "from the artifact",
+  "other-run": "from the other run's artifact (one reference for both runs)",
   config: "from the config",
   default: "the default for a minimized proportion",
   unknown: "source unknown"
@@ -32449,7 +33082,9 @@ function tradeOffPhrase(review2, esc) {
   if (moved.length === 0) return null;
   const f = numberFormatFor(review2);
   const costs = moved.map(([field, words2]) => `${ratio(review2.cost?.[field]?.ratio ?? 1)} ${words2.noun}`).join(" and ");
-  return `${change(review2.validation.delta.estimate, f)} ${esc(review2.metric.name, 60)} for ${costs}`;
+  const metric = esc(review2.metric.name, 60);
+  const gain = review2.validation.change === "better" || review2.validation.change === "worse" ? `${change(review2.validation.delta.estimate, f)} ${metric}` : review2.validation.change === "flat" ? `${metric} unchanged within noise` : `a ${metric} change that cannot be told from noise yet`;
+  return `${gain} for ${costs}`;
 }
 function guardrailNames(review2, call) {
   return (review2.guardrails ?? []).filter((g) => g.nonInferiority === call).map((g) => g.name);
@@ -32705,7 +33340,7 @@ function buildHeadline(review2, esc) {
   const metric = esc(review2.metric.name, 60);
   const v = review2.validation;
   const vSplit = review2.splits.find((s) => s.split === "validation");
-  const movementTone = GOOD_MOVEMENTS.has(review2.movement) ? "good" : review2.movement === "no-significant-change" ? "neutral" : "bad";
+  const movementTone = GOOD_MOVEMENTS.has(review2.movement) ? "good" : review2.movement === "no-significant-change" || review2.movement === "undetermined" ? "neutral" : "bad";
   const vTone = v.change === "better" ? "good" : v.change === "worse" ? "bad" : "neutral";
   const vStats = v.delta.ci === null ? `${change(v.delta.estimate, f)}; run-to-run noise unknown` : `${change(v.delta.estimate, f)}, ${levelPercent(review2)}% interval ${changeInterval(v.delta.ci, f)}, ${pText(v.delta.p)}, ${say(TEST_WORD, v.delta.test, esc)}`;
   const from = vSplit === void 0 ? "" : `${value(vSplit.baseline, f)} \u2192 ${value(vSplit.candidate, f)} `;
@@ -32840,7 +33475,7 @@ var CURVE_TEXT = {
     caption: "Regularization curve"
   }
 };
-function usable(evidence) {
+function usable2(evidence) {
   if (evidence === void 0 || isSkipped(evidence)) return null;
   const chart2 = evidence.chart.filter((p) => Number.isFinite(p.x) && Number.isFinite(p.validation));
   return chart2.length >= 2 ? chart2 : null;
@@ -32849,7 +33484,7 @@ function isSkipped(evidence) {
   return "skipped" in evidence;
 }
 function seriesOf(run, summary, curve) {
-  const points2 = usable(summary.curves[curve]);
+  const points2 = usable2(summary.curves[curve]);
   if (points2 === null) return [];
   const sorted = [...points2].sort((a, b) => a.x - b.x);
   const out = [
@@ -32990,7 +33625,17 @@ function noteSentence(note, review2, f, esc) {
     case "hidden-regressions":
       return `Validation improved overall, yet ${slices(note.count)} regressed significantly (Holm-adjusted): ${names(note.names, note.count, esc)}.`;
     case "noise-unknown":
-      return review2.settings.minEffect > 0 ? `Run-to-run noise is unknown (one repeat of a continuous metric, no per-example predictions): changes are called on size alone (min-effect ${amount(review2.settings.minEffect, f)}).` : "Run-to-run noise is unknown (one repeat of a continuous metric, no per-example predictions) and min-effect is 0: no change can be called. Add repeats (seeds), per-example predictions, or set min-effect.";
+      return "Cannot tell: run-to-run noise is unknown (one repeat, or identical repeats, of a continuous metric without per-example predictions), so changes it touches are undetermined, whatever their size. Repeat each run with at least 2 seeds, or add per-example predictions.";
+    case "reference-from-one-run":
+      return `Only the ${note.from} states a reference (${value(note.value, f)}): it is used for both runs, since the reference is a property of the task.`;
+    case "references-differ":
+      return `Warning: the runs state different references (baseline ${value(note.baseline, f)}, candidate ${value(note.candidate, f)}); the candidate's is used for both, so the bias change is the change of training error.`;
+    case "noise-from-evaluation-set":
+      return `The noise includes the evaluation set's sampling noise (${note.source === "binomial" ? "binomial" : "from per-example values"}), which repeats on fixed rows do not show.`;
+    case "predictions-partial-overlap":
+      return `The predictions files share ${count(note.shared)} ids of ${count(note.baseline)} (baseline) and ${count(note.candidate)} (candidate): not paired; the unpaired test decided.`;
+    case "repeats-decided":
+      return "Both runs have two or more repeats: Welch's test over the repeats decided, since it holds the seed noise that a paired test over one repeat's rows leaves out.";
     case "bias-unknown":
       return "Avoidable bias is unknown: there is no reference level for this metric. Its change is still measured from the training error; the diagnosis rests on variance and data mismatch.";
     case "predictions-share-no-id":
@@ -33019,13 +33664,43 @@ var WARNING = /* @__PURE__ */ new Map([
   [
     "validation-overfit",
     "test error is well above validation error: model choices may be tuned to the validation set."
+  ],
+  [
+    "below-reference",
+    'training error is below the reference level (negative avoidable bias): the model may be memorising noise, or the reference is wrong. This is not "better".'
   ]
 ]);
+var MDE_METHOD = /* @__PURE__ */ new Map([
+  ["welch-noncentral-t", "Welch's t, noncentral t power"],
+  ["normal", "normal approximation"],
+  ["fleiss-two-proportions", "two proportions, Fleiss\u2013Levin\u2013Paik"],
+  ["mcnemar-connor", "McNemar, Connor's formula"],
+  ["paired-t", "paired t"]
+]);
+function powerLine(review2, f, esc) {
+  const { mde, repeatsNeeded: repeatsNeeded2 } = review2.validation;
+  if (mde === void 0 && repeatsNeeded2 === void 0) return null;
+  const alpha = review2.settings.alpha;
+  const smallest = mde === null || mde === void 0 ? "The smallest detectable change is unknown (no noise estimate)" : `This design detects a validation change of ${mde.atLeast ? "at least " : ""}${amount(mde.value, f)} with 80% power at two-sided alpha ${alpha} (${say(MDE_METHOD, mde.method, esc)})`;
+  let repeats = "";
+  if (repeatsNeeded2 !== void 0) {
+    if (repeatsNeeded2.repeats !== null)
+      repeats = `; ${repeatsNeeded2.lowerBound ? "at least " : ""}${count(repeatsNeeded2.repeats)} repeats per run would detect the observed change`;
+    else if (repeatsNeeded2.reason === "noise-unknown")
+      repeats = "; repeat each run with at least 2 seeds to measure the noise";
+    else if (repeatsNeeded2.reason === "fixed-noise")
+      repeats = "; the fixed evaluation set's sampling noise alone hides the observed change: more seeds cannot help, a larger evaluation set can";
+    else if (repeatsNeeded2.reason === "beyond-limit")
+      repeats = "; more than 1,000 repeats per run would be needed to detect the observed change";
+  }
+  return `${smallest}${repeats}.`;
+}
 function reviewNotes2(review2, f, esc) {
   return [
     ...["baseline", "candidate"].flatMap(
       (run) => review2[run].warnings.map((w) => `${run}: ${say(WARNING, w, esc)}`)
     ),
+    ...[powerLine(review2, f, esc)].filter((l) => l !== null),
     ...review2.notes.map((n) => noteSentence(n, review2, f, esc)),
     ...review2.nonLevers.map((n) => say(NON_LEVER, n, esc))
   ];
@@ -33076,6 +33751,9 @@ function methodNotes(review2, esc) {
   for (const [test2, what] of uses) {
     lines.push(`${[...new Set(what)].join(", ")}: ${say(TEST_WHY, test2, esc)}`);
   }
+  lines.push(
+    "Noise of a split's mean over k repeats: the seed spread s\xB2 plus the evaluation set's sampling noise \u03C3\xB2 (binomial p(1 \u2212 p)/N, or s\xB2/N from per-example values). On fixed evaluation rows \u03C3\xB2 is shared by every repeat and does not average out, so Var(mean) = s\xB2/k + \u03C3\xB2; on rows drawn per repeat the spread holds it, so Var(mean) = s\xB2/k, never below \u03C3\xB2/k (law of total variance; Bouthillier et al. 2021). Degrees of freedom: Welch\u2013Satterthwaite. A zero spread is not zero noise; where \u03C3\xB2 cannot be known either, the change is undetermined."
+  );
   if ((review2.guardrails ?? []).some((g) => g.margin !== null)) {
     lines.push(
       `Guardrails: a guardrail is within its margin when the one-sided ${levelPercent(review2)}% upper confidence bound of its worsening is below the margin, beyond it when the lower bound is above the margin, and undetermined otherwise (the confidence-interval approach to non-inferiority, ICH E9 \xA73.3.2 and E10; Wellek 2010). The one-sided p-values are Holm-adjusted across guardrails; the primary verdict is not adjusted by them. A margin from the config wins over the artifacts', the baseline's over the candidate's.`
