@@ -14,6 +14,8 @@ import {
 import { join } from 'node:path';
 
 export const SEED = 20261130;
+/** Points of the benchmark's epoch curve: the most a curve may have (src/model/limits.ts). */
+export const CURVE_POINTS = 10_000;
 
 /** mulberry32: a small, well-known 32-bit PRNG; enough for benchmark data (common practice). */
 function random(seed) {
@@ -79,8 +81,13 @@ function shuffled(n, seed) {
   return order;
 }
 
-function artifact(name, kind, csv, extra = {}) {
+/**
+ * A run artifact; `validation` is what its predictions reproduce (repeat 0), which fitgap checks:
+ * the error rate for a 0/1 column, the mean loss for losses.
+ */
+function artifact(name, kind, csv, validation = null, extra = {}) {
   const proportion = kind === 'proportion';
+  const v = validation ?? (proportion ? 0.095 : 0.3);
   return {
     format: 'fitgap-run/1',
     run: { name, commit: 'b3e51a0', createdAt: '2026-11-30T10:00:00Z' },
@@ -88,16 +95,12 @@ function artifact(name, kind, csv, extra = {}) {
       ? { name: 'late_delivery_error', goal: 'minimize', kind }
       : { name: 'log_loss', goal: 'minimize', kind },
     reference: proportion ? 0.02 : 0.05,
+    // One repeat: then the paired test on the predictions decides the validation change, the
+    // same test the peer runs (with repeats, their spread decides).
     splits: {
-      train: { examples: 4000000, values: proportion ? [0.061, 0.06, 0.062] : [0.2, 0.21, 0.2] },
-      train_dev: {
-        examples: 200000,
-        values: proportion ? [0.07, 0.069, 0.071] : [0.23, 0.22, 0.23],
-      },
-      validation: {
-        examples: 1000000,
-        values: proportion ? [0.095, 0.094, 0.096] : [0.3, 0.3, 0.31],
-      },
+      train: { examples: 4000000, values: [proportion ? 0.061 : 0.2] },
+      train_dev: { examples: 200000, values: [proportion ? 0.07 : 0.23] },
+      validation: { examples: 1000000, values: [round6(v)] },
     },
     hyperparameters: { lambda: 0.01, features: 48, epochs: 40 },
     ...(csv === null ? {} : { predictions: { split: 'validation', path: csv } }),
@@ -105,9 +108,18 @@ function artifact(name, kind, csv, extra = {}) {
   };
 }
 
+/** Written on every run (small files): their values follow the generator. */
 function writeJson(path, value) {
-  if (!existsSync(path)) writeFileSync(path, `${JSON.stringify(value)}\n`);
+  writeFileSync(path, `${JSON.stringify(value)}\n`);
 }
+
+/** What an artifact states for its predictions: the error rate (0/1), or the mean loss. */
+function rate(values) {
+  let sum = 0;
+  for (let i = 0; i < values.length; i++) sum += values[i];
+  return sum / values.length;
+}
+const round6 = (x) => Math.round(x * 1e6) / 1e6;
 
 /** An epoch curve of n points: falls, then validation turns up a little after the middle. */
 function epochCurve(n, seed) {
@@ -132,28 +144,11 @@ export function generate(dir, sizes) {
   writeJson(join(dir, 'tiny-candidate.json'), artifact('eta-dropout', 'proportion', null));
   for (const size of sizes) {
     const n = size === '10m' ? 10_000_000 : 1_000_000;
-    const files = [
-      `base-${size}.csv`,
-      `cand-${size}.csv`,
-      `cand-${size}-shuffled.csv`,
-      ...(size === '1m' ? [`base-${size}-loss.csv`, `cand-${size}-loss.csv`] : []),
-    ];
-    if (files.some((f) => !existsSync(join(dir, f)))) {
-      const o = outcomes(n, SEED + n);
-      writeCsv(
-        join(dir, `base-${size}.csv`),
-        'id,correct',
-        n,
-        null,
-        (i) => `${id(i)},${o.base[i]}`,
-      );
-      writeCsv(
-        join(dir, `cand-${size}.csv`),
-        'id,correct',
-        n,
-        null,
-        (i) => `${id(i)},${o.cand[i]}`,
-      );
+    // Same seed, same outcomes: computed on every run for the artifacts' values, written once.
+    const o = outcomes(n, SEED + n);
+    writeCsv(join(dir, `base-${size}.csv`), 'id,correct', n, null, (i) => `${id(i)},${o.base[i]}`);
+    writeCsv(join(dir, `cand-${size}.csv`), 'id,correct', n, null, (i) => `${id(i)},${o.cand[i]}`);
+    if (!existsSync(join(dir, `cand-${size}-shuffled.csv`)))
       writeCsv(
         join(dir, `cand-${size}-shuffled.csv`),
         'id,correct',
@@ -161,48 +156,47 @@ export function generate(dir, sizes) {
         shuffled(n, SEED + 1),
         (i) => `${id(i)},${o.cand[i]}`,
       );
-      if (size === '1m') {
-        writeCsv(
-          join(dir, `base-${size}-loss.csv`),
-          'id,loss',
-          n,
-          null,
-          (i) => `${id(i)},${o.baseLoss[i]}`,
-        );
-        writeCsv(
-          join(dir, `cand-${size}-loss.csv`),
-          'id,loss',
-          n,
-          null,
-          (i) => `${id(i)},${o.candLoss[i]}`,
-        );
-      }
-    }
+    const wrong = (correct) => 1 - rate(correct);
     writeJson(
       join(dir, `baseline-${size}.json`),
-      artifact('eta-baseline', 'proportion', `base-${size}.csv`),
+      artifact('eta-baseline', 'proportion', `base-${size}.csv`, wrong(o.base)),
     );
     writeJson(
       join(dir, `candidate-${size}.json`),
-      artifact('eta-dropout', 'proportion', `cand-${size}.csv`),
+      artifact('eta-dropout', 'proportion', `cand-${size}.csv`, wrong(o.cand)),
     );
     writeJson(
       join(dir, `candidate-${size}-shuffled.json`),
-      artifact('eta-dropout', 'proportion', `cand-${size}-shuffled.csv`),
+      artifact('eta-dropout', 'proportion', `cand-${size}-shuffled.csv`, wrong(o.cand)),
     );
     if (size === '1m') {
+      writeCsv(
+        join(dir, `base-${size}-loss.csv`),
+        'id,loss',
+        n,
+        null,
+        (i) => `${id(i)},${o.baseLoss[i]}`,
+      );
+      writeCsv(
+        join(dir, `cand-${size}-loss.csv`),
+        'id,loss',
+        n,
+        null,
+        (i) => `${id(i)},${o.candLoss[i]}`,
+      );
       writeJson(
         join(dir, 'baseline-1m-loss.json'),
-        artifact('eta-baseline', 'continuous', 'base-1m-loss.csv'),
+        artifact('eta-baseline', 'continuous', 'base-1m-loss.csv', rate(o.baseLoss)),
       );
       writeJson(
         join(dir, 'candidate-1m-loss.json'),
-        artifact('eta-dropout', 'continuous', 'cand-1m-loss.csv'),
+        artifact('eta-dropout', 'continuous', 'cand-1m-loss.csv', rate(o.candLoss)),
       );
+      // The longest curve an artifact may hold (MAX_CURVE_POINTS in src/model/limits.ts).
       writeJson(
-        join(dir, 'candidate-curve-1m.json'),
-        artifact('eta-dropout', 'proportion', null, {
-          curves: { epochs: epochCurve(1_000_000, SEED + 2) },
+        join(dir, 'candidate-curve-10k.json'),
+        artifact('eta-dropout', 'proportion', null, null, {
+          curves: { epochs: epochCurve(CURVE_POINTS, SEED + 2) },
         }),
       );
     }

@@ -102,8 +102,8 @@ const workloads = {
   'fitgap start-up (CLI)': cli('tiny-baseline.json', 'tiny-candidate.json'),
   'fitgap start-up (action)': [node, join(ROOT, 'dist/index.js')],
   "node -e ''": [node, '-e', ''],
-  'fitgap curve 1M': cli('tiny-baseline.json', 'candidate-curve-1m.json'),
-  'floor curve 1M': [node, join(ROOT, 'bench/floor-json.mjs'), 'candidate-curve-1m.json'],
+  'fitgap curve 10k': cli('tiny-baseline.json', 'candidate-curve-10k.json'),
+  'floor curve 10k': [node, join(ROOT, 'bench/floor-json.mjs'), 'candidate-curve-10k.json'],
 };
 
 /** One run in its own process: wall ms (measured here), CPU ms and peak RSS MB (/usr/bin/time). */
@@ -142,7 +142,7 @@ const groups = [
     members: ['fitgap start-up (CLI)', 'fitgap start-up (action)', "node -e ''"],
     turns: 2 * TURNS + 1,
   },
-  { key: 'curve', members: ['fitgap curve 1M', 'floor curve 1M'], turns: TURNS },
+  { key: 'curve', members: ['fitgap curve 10k', 'floor curve 10k'], turns: TURNS },
   ...(quick
     ? []
     : [
@@ -352,14 +352,16 @@ for (const entry of ['CLI', 'action']) {
   );
 }
 {
-  const r = ratio('curve', 'fitgap curve 1M', 'floor curve 1M');
+  // A curve holds at most 10,000 points (src/model/limits.ts): the target was set for 1M points,
+  // which are now refused at once; at 10,000 both sides are mostly Node's start-up.
+  const r = ratio('curve', 'fitgap curve 10k', 'floor curve 10k');
   row(
-    'epoch curve of 1M points (validate, analyse, downsample) vs `JSON.parse` of the file',
-    cell('curve', 'fitgap curve 1M'),
-    `JSON.parse: ${cell('curve', 'floor curve 1M')}`,
+    'epoch curve of 10,000 points, the most allowed (validate, analyse, downsample) vs `JSON.parse` of the file',
+    cell('curve', 'fitgap curve 10k'),
+    `JSON.parse: ${cell('curve', 'floor curve 10k')}`,
     times(r),
-    times(ratio('curve', 'fitgap curve 1M', 'floor curve 1M', 'cpu')),
-    '≤ 1.5×',
+    times(ratio('curve', 'fitgap curve 10k', 'floor curve 10k', 'cpu')),
+    '≤ 1.5× (set for 1M points)',
     r <= 1.5,
   );
 }

@@ -1,7 +1,6 @@
 /**
- * Guardrail review: each guardrail's change with the primary metric's test choice (Welch with
- * repeats on both sides, the binomial normal approximation for one repeat of a proportion with
- * examples, none otherwise), and a non-inferiority call against its margin, Holm-adjusted across
+ * Guardrail review: each guardrail's change under the primary metric's noise rule (seed spread plus
+ * the evaluation set's sampling noise, stats/split-noise.ts; undetermined when neither is known), and a non-inferiority call against its margin, Holm-adjusted across
  * the guardrails (src/stats/non-inferiority.ts). The primary verdict is never adjusted by them.
  * Pure.
  */
@@ -9,13 +8,13 @@ import type { GuardrailChange, GuardrailReview, MarginSource } from '../model/gu
 import type { Guardrail, RunArtifact, Split } from '../model/run.js';
 import {
   binomialVariance,
+  compareSplitMeans,
   mean,
   nonInferiorityCalls,
   nonInferiorityTest,
-  normalTest,
-  welchT,
-  welchWorsening,
+  splitNoise,
   type NonInferiorityTest,
+  type SplitNoise,
   type WorseningEstimate,
 } from '../stats/index.js';
 
@@ -33,37 +32,43 @@ interface Tested {
 /** Sign that turns the metric into "worse is positive". */
 const worseSign = (g: Guardrail): 1 | -1 => (g.metric.goal === 'minimize' ? 1 : -1);
 
-function test(b: Guardrail, c: Guardrail, alpha: number): Tested {
-  const bs = b.splits.validation;
-  const cs = c.splits.validation;
-  const estimate = mean(cs.values) - mean(bs.values);
-  const sign = worseSign(c);
-  if (bs.values.length >= 2 && cs.values.length >= 2) {
-    const t = welchT(bs.values, cs.values, alpha);
-    const w = welchWorsening(
-      bs.values.map((v) => sign * v),
-      cs.values.map((v) => sign * v),
-    );
-    return { change: changeOf(t.estimate, t.ci, t.p, 'welch-t', sign, alpha), worsening: w };
-  }
-  const variance = binomial(b, bs) !== null && binomial(c, cs) !== null;
-  if (variance) {
-    const v = (binomial(b, bs) as number) + (binomial(c, cs) as number);
-    const z = normalTest(estimate, v, alpha, 'z-binomial');
-    return {
-      change: changeOf(estimate, z.ci, z.p, 'z-binomial', sign, alpha),
-      worsening: { estimate: sign * estimate, se: Math.sqrt(v), df: null },
-    };
-  }
-  return {
-    change: { estimate, ci: null, p: null, test: 'none', call: 'undetermined' },
-    worsening: null,
-  };
+/** A guardrail split's noise under the primary metric's rule (seed spread plus sampling noise). */
+function noiseOf(g: Guardrail, split: Split, sign: 1 | -1): SplitNoise {
+  const m = mean(split.values);
+  const sampling =
+    g.metric.kind === 'proportion' && split.examples !== undefined && m >= 0 && m <= 1
+      ? { variance: binomialVariance(m, split.examples), df: Infinity, source: 'binomial' as const }
+      : null;
+  return splitNoise({
+    values: split.values.map((v) => sign * v),
+    sampling,
+    evaluationRows: split.evaluationRows ?? 'fixed',
+  });
 }
 
-function binomial(g: Guardrail, split: Split): number | null {
-  if (g.metric.kind !== 'proportion' || split.examples === undefined) return null;
-  return binomialVariance(mean(split.values), split.examples * split.values.length);
+function test(b: Guardrail, c: Guardrail, alpha: number): Tested {
+  const sign = worseSign(c);
+  const nb = noiseOf(b, b.splits.validation, sign);
+  const nc = noiseOf(c, c.splits.validation, sign);
+  const estimate = mean(c.splits.validation.values) - mean(b.splits.validation.values);
+  const r = compareSplitMeans(nb, nc, alpha);
+  if (r.ci === null || r.p === null || r.test === 'none') {
+    return {
+      change: { estimate, ci: null, p: null, test: 'none', call: 'undetermined' },
+      worsening: null,
+    };
+  }
+  // r is in "worse is positive" units; the change is reported in metric units.
+  const ci: [number, number] = sign === 1 ? r.ci : [-r.ci[1], -r.ci[0]];
+  const testName = r.test === 'z-binomial' ? 'z-binomial' : 'welch-t';
+  return {
+    change: changeOf(estimate, ci, r.p, testName, sign, alpha),
+    worsening: {
+      estimate: r.estimate,
+      se: Math.sqrt(nb.variance + nc.variance),
+      df: r.df === undefined ? null : r.df,
+    },
+  };
 }
 
 function changeOf(

@@ -5,7 +5,13 @@
  * variance. Pure.
  */
 import type { RunArtifact, SplitName } from '../model/run.js';
-import { binomialVariance, mean } from '../stats/index.js';
+import {
+  binomialSamplingVariance,
+  mean,
+  satterthwaite,
+  type EvaluationRows,
+  type SamplingVariance,
+} from '../stats/index.js';
 
 export interface Term {
   split: SplitName;
@@ -46,20 +52,56 @@ export function perRepeat(run: RunArtifact, measure: Measure): number[] | null {
   return out;
 }
 
+/** σ² of one repeat's value of a split from its per-example values (predictions), by split. */
+export type ExampleNoise = Partial<Record<SplitName, SamplingVariance>>;
+
 /**
- * Binomial variance of the measure's mean for a proportion metric whose every split involved
- * gives `examples`; null otherwise. Splits are independent samples (common practice).
+ * σ² of one repeat of a split, from the evaluation set: binomial p(1 − p)/N for a proportion with
+ * `examples` (Agresti–Coull adjusted at 0 or 1), else from per-example values when given; null when
+ * it cannot be known.
  */
-export function binomialMeasureVariance(run: RunArtifact, measure: Measure): number | null {
-  if (run.metric.kind !== 'proportion') return null;
-  let total = 0;
+export function splitSampling(
+  run: RunArtifact,
+  split: SplitName,
+  examples: ExampleNoise = {},
+): SamplingVariance | null {
+  const s = run.splits[split];
+  if (s === undefined) return null;
+  if (run.metric.kind === 'proportion' && s.examples !== undefined) {
+    // A rate over N examples is a count over N: round to it (so 1e-300 is 0, not noiseless).
+    const rate = Math.round(Math.min(1, Math.max(0, mean(s.values))) * s.examples) / s.examples;
+    return binomialSamplingVariance(rate, s.examples);
+  }
+  return examples[split] ?? null;
+}
+
+/**
+ * σ² of one repeat of the measure: Σ w² σ²(split) over its terms (splits are independent samples;
+ * common practice), df by Welch–Satterthwaite; null when any term's σ² is unknown. The rows are
+ * `per-repeat` only when every term's are.
+ */
+export function measureSampling(
+  run: RunArtifact,
+  measure: Measure,
+  examples: ExampleNoise = {},
+): { sampling: SamplingVariance | null; rows: EvaluationRows } {
+  const parts: { variance: number; df: number }[] = [];
+  let perRepeatRows = true;
+  let known = true;
+  let source: SamplingVariance['source'] = 'binomial';
   for (const term of measure.terms) {
     const split = run.splits[term.split];
-    if (split?.examples === undefined) return null;
-    const repeats = split.values.length;
-    // The mean over repeats of one split pools repeats × examples trials.
-    total +=
-      term.weight * term.weight * binomialVariance(mean(split.values), split.examples * repeats);
+    if ((split?.evaluationRows ?? 'fixed') !== 'per-repeat') perRepeatRows = false;
+    const s = splitSampling(run, term.split, examples);
+    if (s === null || !(s.variance > 0)) {
+      known = false;
+      continue;
+    }
+    if (s.source === 'per-example') source = 'per-example';
+    parts.push({ variance: term.weight * term.weight * s.variance, df: s.df });
   }
-  return total;
+  const rows: EvaluationRows = perRepeatRows ? 'per-repeat' : 'fixed';
+  if (!known || parts.length === 0) return { sampling: null, rows };
+  const variance = parts.reduce((a, p) => a + p.variance, 0);
+  return { sampling: { variance, df: satterthwaite(parts), source }, rows };
 }

@@ -8,6 +8,7 @@ import type {
   FailOn,
   Note,
   PairedPredictions,
+  PairedSummary,
   Review,
   ReviewSettings,
   ShortfallDelta,
@@ -15,11 +16,15 @@ import type {
 } from '../model/review.js';
 import {
   componentChanges,
+  repeatsDecide,
   splitChanges,
   splitShortfalls,
   type ComponentChanges,
 } from './changes.js';
 import { reviewCost } from './cost.js';
+import { taskReference, type TaskReference } from './decompose.js';
+import { exampleNoise, validationPower } from './power.js';
+import type { RunsExampleNoise } from './noise.js';
 import { applyGate } from './gate.js';
 import { reviewGuardrails } from './guardrails.js';
 import { diffHyperparameters, pulledLevers } from './hyperparameters.js';
@@ -81,11 +86,22 @@ export function buildReview(input: ReviewInput): Review {
   const calls: CallSettings = { alpha: settings.alpha, minEffect: settings.minEffect };
   const reference = input.settings.reference;
   const summarySettings = { ...settings, ...(reference === undefined ? {} : { reference }) };
-  const base = summarize(baseline, summarySettings);
-  const cand = summarize(candidate, summarySettings);
   const runs = { baseline, candidate };
+  const task = taskReference(baseline, candidate, reference);
+  const examples = exampleNoise(runs, input.paired);
+  const base = summarize(
+    baseline,
+    { ...summarySettings, referenceChoice: task.baseline },
+    examples.baseline,
+  );
+  const cand = summarize(
+    candidate,
+    { ...summarySettings, referenceChoice: task.candidate },
+    examples.candidate,
+  );
+  const paired = input.paired?.partial === true ? undefined : input.paired;
 
-  const shortfalls = splitShortfalls(runs, settings.alpha, input.paired);
+  const shortfalls = splitShortfalls(runs, settings.alpha, paired, examples);
   const validationShortfall = shortfalls.get('validation');
   if (validationShortfall === undefined)
     throw new Error('validation split is required by the schema');
@@ -93,12 +109,21 @@ export function buildReview(input: ReviewInput): Review {
     runs,
     { baseline: base.reference, candidate: cand.reference },
     calls,
+    examples,
   );
   const movement = movementOf(components.bias?.call ?? 'flat', components.variance.call);
+  const change = validationChangeOf(toShortfallDelta(validationShortfall, calls).call);
   const validation = {
-    change: validationChangeOf(toShortfallDelta(validationShortfall, calls).call),
+    change,
     delta: toMetricDelta(toMetricUnits(validationShortfall, shortfallSign(candidate)), calls),
+    ...(change === 'flat' || change === 'undetermined'
+      ? validationPower(runs, validationShortfall, settings.alpha, examples)
+      : {}),
   };
+  const pairedDecided =
+    paired !== undefined &&
+    paired.rows > 0 &&
+    (validationShortfall.test === 'mcnemar-exact' || validationShortfall.test === 'paired-t');
   const sliceResult = compareSlices(baseline, candidate, validation.change, calls);
   const noiseUnknown = validation.delta.test === 'none' || components.variance.test === 'none';
 
@@ -167,9 +192,15 @@ export function buildReview(input: ReviewInput): Review {
         noiseUnknown,
         biasUnknown: cand.biasUnknown,
         paired: input.paired,
+        task,
+        repeatsDecided:
+          paired !== undefined &&
+          paired.rows > 0 &&
+          repeatsDecide(runs, paired.split ?? 'validation'),
+        examples,
       }),
     ],
-    paired: pairedSummary(input.paired),
+    paired: pairedSummary(input.paired, pairedDecided, runs),
   };
 }
 
@@ -181,8 +212,24 @@ function reviewNotes(facts: {
   noiseUnknown: boolean;
   biasUnknown: boolean;
   paired: PairedPredictions | undefined;
+  task: TaskReference;
+  repeatsDecided: boolean;
+  examples: RunsExampleNoise;
 }): Note[] {
   const notes: Note[] = [];
+  if (facts.task.fromOneRun !== null)
+    notes.push({ code: 'reference-from-one-run', ...facts.task.fromOneRun });
+  if (facts.task.differ !== null) notes.push({ code: 'references-differ', ...facts.task.differ });
+  if (facts.paired?.partial === true) {
+    const sides = facts.paired.sides;
+    notes.push({
+      code: 'predictions-partial-overlap',
+      shared: facts.paired.rows,
+      baseline: sides?.baseline.n ?? 0,
+      candidate: sides?.candidate.n ?? 0,
+    });
+  }
+  if (facts.repeatsDecided) notes.push({ code: 'repeats-decided' });
   if (facts.components.varianceFallback) notes.push({ code: 'train-dev-in-one-run' });
   if (facts.unpaired.length > 0) {
     notes.push({
@@ -201,17 +248,33 @@ function reviewNotes(facts: {
   }
   if (facts.noiseUnknown) notes.push({ code: 'noise-unknown' });
   if (facts.biasUnknown) notes.push({ code: 'bias-unknown' });
-  if (facts.paired !== undefined && facts.paired.rows === 0)
+  if (facts.paired !== undefined && facts.paired.rows === 0 && facts.paired.partial !== true)
     notes.push({ code: 'predictions-share-no-id' });
   return notes;
 }
 
-function pairedSummary(paired: PairedPredictions | undefined): Review['paired'] {
+/** The paired block: it names a test only when that test decided the validation change. */
+function pairedSummary(
+  paired: PairedPredictions | undefined,
+  decided: boolean,
+  runs: { baseline: RunArtifact; candidate: RunArtifact },
+): Review['paired'] {
   if (paired === undefined) return null;
-  if (paired.kind === 'continuous') return { rows: paired.rows, test: 'paired-t' };
+  const reason: PairedSummary['reason'] = decided
+    ? null
+    : paired.partial === true
+      ? 'partial-overlap'
+      : paired.rows === 0
+        ? 'no-shared-id'
+        : repeatsDecide(runs, paired.split ?? 'validation')
+          ? 'repeats'
+          : null;
+  if (paired.kind === 'continuous')
+    return { rows: paired.rows, test: decided ? 'paired-t' : null, reason };
   return {
     rows: paired.rows,
-    test: 'mcnemar-exact',
+    test: decided ? 'mcnemar-exact' : null,
+    reason,
     discordant: {
       baselineOnly: paired.baselineOnly ?? 0,
       candidateOnly: paired.candidateOnly ?? 0,

@@ -5,6 +5,8 @@ import type { Readable } from 'node:stream';
 export interface ByteReader {
   read(into: Uint8Array, offset: number, length: number): Promise<number>;
   close(): Promise<void>;
+  /** The file's size in bytes once opened, when known (it only sizes the id table). */
+  readonly size?: number | null;
 }
 
 /**
@@ -62,6 +64,9 @@ export function lazyReader(open: () => Promise<ByteReader>): ByteReader {
     async close() {
       closed = true;
       await source?.close();
+    },
+    get size() {
+      return source?.size ?? null;
     },
   };
 }

@@ -44,6 +44,13 @@ export class Pairing {
   baselineOnly = 0;
   candidateOnly = 0;
   readonly diffs = new RunningStats();
+  /**
+   * Each file's own rows, paired or not (they must reproduce the artifact's split value): n, mean
+   * and M2 of the baseline's values at 0–2, of the candidate's at 3–5. Welford's update, the same
+   * arithmetic in the same order as RunningStats.push (stats/descriptive.ts), inline: a double
+   * argument is an allocation per call.
+   */
+  readonly sides = new Float64Array(6);
   /** Files (BASE | CAND) whose ids stopped increasing. */
   unordered = 0;
   readonly batch: IdBatch;
@@ -68,8 +75,6 @@ export class Pairing {
     readonly table: IdTable,
     kind: MetricKind,
     private readonly tuning: PairingTuning,
-    /** File sizes in bytes, when known. */
-    private readonly sizes: readonly [number | null, number | null],
   ) {
     this.proportion = kind === 'proportion';
     this.batch = new IdBatch(2 * tuning.window);
@@ -84,6 +89,15 @@ export class Pairing {
           const r = a.advance();
           if (r === NEED) return NEED_A;
           this.hasA = r === ROW;
+          if (this.hasA) {
+            const s = this.sides;
+            const x = a.value;
+            const n = (s[0] as number) + 1;
+            s[0] = n;
+            const delta = x - (s[1] as number);
+            s[1] = (s[1] as number) + delta / n;
+            s[2] = (s[2] as number) + delta * (x - (s[1] as number));
+          }
         }
         this.phase = ADVANCE_B;
       }
@@ -92,6 +106,15 @@ export class Pairing {
           const r = b.advance();
           if (r === NEED) return NEED_B;
           this.hasB = r === ROW;
+          if (this.hasB) {
+            const s = this.sides;
+            const x = b.value;
+            const n = (s[3] as number) + 1;
+            s[3] = n;
+            const delta = x - (s[4] as number);
+            s[4] = (s[4] as number) + delta / n;
+            s[5] = (s[5] as number) + delta * (x - (s[4] as number));
+          }
         }
         this.phase = PAIR;
       }
@@ -194,7 +217,7 @@ export class Pairing {
     table.widen(batch.longest);
     // When about a row per step waits, the ids are shuffled: then rows wait up to half the file at
     // once (a random order), and the table may as well grow to that in one step.
-    const rows = Math.max(this.estimate(this.a, 0), this.estimate(this.b, 1));
+    const rows = Math.max(this.estimate(this.a), this.estimate(this.b));
     table.expected = table.size > this.step / 2 ? rows / 2 : 0;
     // A small table grows once for the whole batch (not by doubling through it).
     if (table.slots < 2 * batch.size) table.reserve(table.size + batch.size);
@@ -211,11 +234,9 @@ export class Pairing {
   }
 
   /** About how many rows a file has, from its size and the bytes per row so far; 0 if unknown. */
-  private estimate(lines: PredictionLines, i: 0 | 1): number {
-    const size = this.sizes[i];
-    return size === null || size === undefined || lines.rows === 0
-      ? 0
-      : (size * lines.rows) / lines.consumed;
+  private estimate(lines: PredictionLines): number {
+    const size = lines.size;
+    return size === null || lines.rows === 0 ? 0 : (size * lines.rows) / lines.consumed;
   }
 
   /** One table operation; a pair it makes goes to the counts or the ring. */
@@ -245,6 +266,18 @@ export class Pairing {
       const k = base === later ? 1 : 2;
       this.ring[(at - this.windowStart) * 3 + k] = y - x;
     }
+  }
+
+  /** Count, mean and sample variance of one file's rows (0 baseline, 1 candidate), as RunningStats gives them. */
+  side(i: 0 | 1): { n: number; mean: number; variance: number } {
+    const s = this.sides;
+    const n = s[3 * i] as number;
+    const m2 = s[3 * i + 2] as number;
+    return {
+      n,
+      mean: n > 0 ? (s[3 * i + 1] as number) : 0,
+      variance: n > 1 ? Math.max(0, m2 / (n - 1)) : 0,
+    };
   }
 
   /** RunningStats refuses a non-finite value: let it throw now, as it would have. */

@@ -370,6 +370,11 @@ export class PredictionLines {
     return false;
   }
 
+  /** The file's size in bytes, when its source knows it (after the first read). */
+  get size(): number | null {
+    return this.reader.size ?? null;
+  }
+
   /** Bytes read up to the current row. */
   get consumed(): number {
     return this.dropped + this.pos;

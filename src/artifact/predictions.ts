@@ -138,13 +138,17 @@ export async function pairPredictions(
   candidate: PredictionsFile,
   kind: MetricKind,
   tuning: PairingTuning = TUNING,
-): Promise<PairedPredictions & { unmatched: { baseline: number; candidate: number } }> {
+): Promise<
+  PairedPredictions & {
+    unmatched: { baseline: number; candidate: number };
+    sides: NonNullable<PairedPredictions['sides']>;
+  }
+> {
   const a = lines(baseline, kind);
   const b = lines(candidate, kind);
   try {
     const table = new IdTable(kind === 'continuous');
-    // The files' sizes are not known here (the reader sees streams): the id table grows as it goes.
-    const pairing = new Pairing(a, b, table, kind, tuning, [null, null]);
+    const pairing = new Pairing(a, b, table, kind, tuning);
     for (let r = pairing.run(); r !== DONE; r = pairing.run()) {
       if (r === NEED_A) await a.fill();
       else await b.fill();
@@ -167,6 +171,8 @@ export async function pairPredictions(
 
     const unmatched = { baseline: table.waitingBase, candidate: table.waitingCand };
     const { rows, diffs } = pairing;
+    // Each file's own rows, paired or not: they must reproduce the artifact's split value.
+    const sides = { baseline: pairing.side(0), candidate: pairing.side(1) };
     if (kind === 'proportion')
       return {
         kind,
@@ -174,8 +180,10 @@ export async function pairPredictions(
         baselineOnly: pairing.baselineOnly,
         candidateOnly: pairing.candidateOnly,
         unmatched,
+        sides,
       };
     return {
+      sides,
       kind,
       rows,
       meanDiff: diffs.n > 0 ? diffs.mean : 0,

@@ -324,6 +324,8 @@ export interface CheckedBytes {
   read(into: Uint8Array, offset: number, length: number): Promise<number>;
   /** Closes the file (again: nothing). */
   close(): Promise<void>;
+  /** The size the file had when it was opened and checked. */
+  readonly size: number;
 }
 
 /**
@@ -360,6 +362,7 @@ export async function bytesChecked(target: UntrustedFile): Promise<CheckedBytes>
       return 0;
     },
     close,
+    size: file.size,
   };
 }
 

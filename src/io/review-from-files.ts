@@ -168,7 +168,16 @@ async function pairIfBoth(
   const result = await pairPredictions(baseline.predictions, candidate.predictions, kind);
   const notes: Note[] = [];
   const { unmatched, ...paired } = result;
-  if (result.rows < MIN_PAIRED_ROWS) {
+  const issues = [
+    ...reproduceIssues(baseline, paired.sides.baseline),
+    ...reproduceIssues(candidate, paired.sides.candidate),
+  ];
+  if (issues.length > 0) throw new InputError(issues);
+  const aggregate = cp.aggregate ?? 'mean';
+  const repeat = cp.repeat ?? 0;
+  // Pair only when the id sets match; otherwise the unpaired test decides (a note says so).
+  const partial = unmatched.baseline + unmatched.candidate > 0 && result.rows > 0;
+  if (result.rows < MIN_PAIRED_ROWS && !partial) {
     throw new InputError([
       {
         file: `${baseline.predictions.file} and ${candidate.predictions.file}`,
@@ -179,7 +188,7 @@ async function pairIfBoth(
       },
     ]);
   }
-  if (unmatched.baseline + unmatched.candidate > 0) {
+  if (unmatched.baseline + unmatched.candidate > 0 && !partial) {
     notes.push({
       code: 'predictions-unmatched',
       rows: result.rows,
@@ -187,7 +196,95 @@ async function pairIfBoth(
       candidate: unmatched.candidate,
     });
   }
-  return { paired: { ...paired, split: bp.split }, notes };
+  return {
+    paired: { ...paired, split: bp.split, aggregate, repeat, ...(partial ? { partial } : {}) },
+    notes,
+  };
+}
+
+/** Agreement the per-example values must show with the artifact's split value (see README). */
+export function reproduceTolerance(
+  value: number,
+  rows: number,
+  kind: 'proportion' | 'continuous',
+): number {
+  const rounding = Math.max(5e-4, 5e-4 * Math.abs(value));
+  return kind === 'proportion' ? Math.max(rounding, 1 / Math.max(1, rows)) : rounding;
+}
+
+/**
+ * The per-example values must reproduce the artifact's value of their split for their repeat:
+ * the rate of `correct` = 1 (accuracy) or = 0 (error rate) for a proportion; the declared aggregate
+ * of `loss` for a minimized continuous metric. (A maximized continuous metric such as R² is not a
+ * plain aggregate of the loss and is not checked.)
+ */
+function reproduceIssues(run: LoadedRun, side: { n: number; mean: number }): Issue[] {
+  const ref = run.artifact.predictions;
+  if (ref === undefined || side.n === 0) return [];
+  const metric = run.artifact.metric;
+  const repeat = ref.repeat ?? 0;
+  const values = run.artifact.splits[ref.split]?.values;
+  const pointer = `/splits/${ref.split}/values/${repeat}`;
+  const stated = values?.[repeat];
+  if (stated === undefined) {
+    return [
+      {
+        file: run.file,
+        pointer: '/predictions/repeat',
+        expected: `must name a repeat of split "${ref.split}" (0 to ${(values?.length ?? 1) - 1})`,
+        got: String(repeat),
+      },
+    ];
+  }
+  let computed: number;
+  if (metric.kind === 'proportion') {
+    computed = metric.goal === 'maximize' ? side.mean : 1 - side.mean;
+  } else {
+    if (metric.goal === 'maximize') return [];
+    const aggregate = ref.aggregate ?? 'mean';
+    computed =
+      aggregate === 'mean'
+        ? side.mean
+        : aggregate === 'sum'
+          ? side.n * side.mean
+          : Math.sqrt(side.mean);
+  }
+  if (Math.abs(computed - stated) <= reproduceTolerance(stated, side.n, metric.kind)) return [];
+  const what =
+    metric.kind === 'proportion'
+      ? `the rate of correct = ${metric.goal === 'maximize' ? 1 : 0} over ${side.n} rows`
+      : `the ${ref.aggregate ?? 'mean'} of loss over ${side.n} rows`;
+  return [
+    {
+      file: run.file,
+      pointer,
+      expected: `must agree with its predictions (${ref.path}): ${what} is ${Number(computed.toPrecision(6))}, the artifact states ${stated}`,
+      got: String(stated),
+      hint: 'The predictions must be for this run and this repeat (set predictions.repeat), and for a continuous metric predictions.aggregate must say how loss aggregates to the value.',
+    },
+  ];
+}
+
+/** A maximized metric with values above 1 needs metric.best (its error level is best − value). */
+function bestIssues(run: LoadedRun): Issue[] {
+  const a = run.artifact;
+  if (a.metric.goal !== 'maximize' || a.metric.best !== undefined) return [];
+  const splits = Object.entries(a.splits) as [string, { values: number[] } | undefined][];
+  for (const [name, split] of splits) {
+    const index = split?.values.findIndex((v) => v > 1) ?? -1;
+    if (index >= 0) {
+      return [
+        {
+          file: run.file,
+          pointer: `/splits/${name}/values/${index}`,
+          expected: 'a maximized metric without metric.best must stay at or below 1',
+          got: String(split?.values[index]),
+          hint: 'Add metric.best, the best possible value (100 for a 0–100 score), so the error level is best − value.',
+        },
+      ];
+    }
+  }
+  return [];
 }
 
 /** The config file (explicit, or `.github/fitgap.yml` under `cwd` when it exists) and its sha256. */
@@ -224,7 +321,11 @@ export async function reviewLoadedRuns(
   config: ConfigFile,
   overrides?: SettingsOverrides,
 ): Promise<Review> {
-  const mismatch = sameMetric(baseline, candidate);
+  const mismatch = [
+    ...sameMetric(baseline, candidate),
+    ...bestIssues(baseline),
+    ...bestIssues(candidate),
+  ];
   if (mismatch.length > 0) throw new InputError(mismatch);
   const { paired, notes } = await pairIfBoth(baseline, candidate);
   return buildReview({

@@ -21,7 +21,7 @@ export type FailOn =
     )
   | string;
 /**
- * How the change moved the model in the bias/variance plane, from the calls on Δbias and Δvariance.
+ * How the change moved the model in the bias/variance plane, from the calls on Δbias and Δvariance. `undetermined` when either call is undetermined.
  */
 export type Movement =
   | 'better-on-both'
@@ -30,11 +30,12 @@ export type Movement =
   | 'away-from-overfitting'
   | 'no-significant-change'
   | 'toward-underfitting'
-  | 'worse-on-both';
+  | 'worse-on-both'
+  | 'undetermined';
 /**
- * Validation better, worse or flat (within noise or below min-effect).
+ * Validation better, worse, flat (within noise or below min-effect), or undetermined (its noise cannot be known).
  */
-export type ValidationChange = 'better' | 'worse' | 'flat';
+export type ValidationChange = 'better' | 'worse' | 'flat' | 'undetermined';
 /**
  * A two-sided interval [low, high].
  *
@@ -43,13 +44,14 @@ export type ValidationChange = 'better' | 'worse' | 'flat';
  */
 export type Interval = [number, number];
 /**
- * The significance test behind a change (DESIGN.md §4); `none` when run-to-run noise is unknown.
+ * The significance test behind a change (DESIGN.md §4); `newcombe-score` is Newcombe's (1998) hybrid score interval for a difference of two proportions, its p inverting the interval; `none` when the noise is unknown.
  */
-export type TestName = 'welch-t' | 'z-binomial' | 'mcnemar-exact' | 'paired-t' | 'none';
+export type TestName =
+  'welch-t' | 'z-binomial' | 'mcnemar-exact' | 'paired-t' | 'newcombe-score' | 'none';
 /**
- * A change called on its estimate: `up`/`down` only when significant at alpha and at least min-effect in size; otherwise `flat`.
+ * A change called on its estimate: `up`/`down` only when significant at alpha and at least min-effect in size; `flat` when its noise is known and it is not; `undetermined` when its noise cannot be known (one repeat or a zero spread of a continuous metric without per-example values).
  */
-export type Call = 'up' | 'down' | 'flat';
+export type Call = 'up' | 'down' | 'flat' | 'undetermined';
 /**
  * A split, named as in the run artifact.
  */
@@ -115,7 +117,12 @@ export type Note =
   | PredictionsSplitMismatchNote
   | PredictionsUnmatchedNote
   | EpochLogNotUsedNote
-  | EpochLogMissingNote;
+  | EpochLogMissingNote
+  | ReferenceFromOneRunNote
+  | ReferencesDifferNote
+  | NoiseFromEvaluationSetNote
+  | PredictionsPartialOverlapNote
+  | RepeatsDecidedNote;
 /**
  * What kept a guardrail from a full review.
  */
@@ -144,6 +151,11 @@ export interface Review {
   validation: {
     change: ValidationChange;
     delta: MetricDelta;
+    /**
+     * Present when the validation change is flat or undetermined; null when the noise is unknown.
+     */
+    mde?: MinimumDetectableEffect | null;
+    repeatsNeeded?: RepeatsNeeded;
   };
   /**
    * Change in avoidable bias; null when neither run's training error can be measured.
@@ -220,6 +232,23 @@ export interface MetricDelta {
   call: Call;
 }
 /**
+ * The smallest |candidate − baseline| of the validation value (metric units) this design detects with 80% power at the two-sided alpha; `atLeast` when a noise component could not be estimated (the true value is larger). `method`: `welch-noncentral-t` (noncentral t at the Welch–Satterthwaite df; Cohen 1988), `normal` (df ∞: binomial noise alone), `fleiss-two-proportions` (Fleiss, Levin & Paik 2003), `mcnemar-connor` (Connor 1987), `paired-t`.
+ */
+export interface MinimumDetectableEffect {
+  value: number;
+  method:
+    'welch-noncentral-t' | 'normal' | 'fleiss-two-proportions' | 'mcnemar-connor' | 'paired-t';
+  atLeast: boolean;
+}
+/**
+ * Present when the validation change is flat or undetermined.
+ */
+export interface RepeatsNeeded {
+  repeats: number | null;
+  lowerBound: boolean;
+  reason: 'no-change' | 'noise-unknown' | 'fixed-noise' | 'beyond-limit' | null;
+}
+/**
  * A change candidate − baseline in shortfall units: the metric's units signed so that up is always worse.
  */
 export interface ShortfallDelta {
@@ -259,7 +288,10 @@ export interface RunSummary {
    * Reference level used; null when unknown.
    */
   reference: number | null;
-  referenceSource: 'artifact' | 'config' | 'default' | 'unknown';
+  /**
+   * Where the reference came from: this run's artifact, the other run's artifact (the reference is a property of the task: one level for both runs), the config, the default, or unknown.
+   */
+  referenceSource: 'artifact' | 'other-run' | 'config' | 'default' | 'unknown';
   splits: SplitSummary[];
   /**
    * Validation error level e (DESIGN.md §6).
@@ -277,9 +309,9 @@ export interface RunSummary {
    */
   biasUnknown: boolean;
   /**
-   * `validation-overfit`: test error well above validation error.
+   * `validation-overfit`: test error well above validation error. `below-reference`: training error significantly below the reference level (negative avoidable bias): memorising noise, or a wrong reference.
    */
-  warnings: 'validation-overfit'[];
+  warnings: ('validation-overfit' | 'below-reference')[];
   curves: CurvesReport;
 }
 /**
@@ -736,15 +768,57 @@ export interface EpochLogMissingNote {
   log: string;
 }
 /**
- * Paired-prediction evidence on the validation change.
+ * Only one artifact states a reference: it is used for both runs (the reference is a property of the task).
+ */
+export interface ReferenceFromOneRunNote {
+  code: 'reference-from-one-run';
+  from: 'baseline' | 'candidate';
+  value: number;
+}
+/**
+ * The two artifacts state different references: the candidate's is used for both runs, so Δbias equals the change of training shortfall.
+ */
+export interface ReferencesDifferNote {
+  code: 'references-differ';
+  baseline: number;
+  candidate: number;
+}
+/**
+ * At least one run's validation noise includes the evaluation set's sampling noise (binomial or per-example), which the seed spread does not hold on fixed rows.
+ */
+export interface NoiseFromEvaluationSetNote {
+  code: 'noise-from-evaluation-set';
+  source: 'binomial' | 'per-example';
+}
+/**
+ * The predictions files' ids only partly match: no paired test; the unpaired test decided.
+ */
+export interface PredictionsPartialOverlapNote {
+  code: 'predictions-partial-overlap';
+  shared: number;
+  baseline: number;
+  candidate: number;
+}
+/**
+ * Both runs have at least 2 repeats: Welch's test over repeats decided, since it holds the seed noise that a paired test over one repeat's rows leaves out; the predictions were not used for the test.
+ */
+export interface RepeatsDecidedNote {
+  code: 'repeats-decided';
+}
+/**
+ * Paired-prediction evidence on the validation change. `test` names the paired test only when it decided the change; null otherwise (with `reason`).
  */
 export interface PairedSummary {
   rows: number;
-  test: 'mcnemar-exact' | 'paired-t';
+  test: 'mcnemar-exact' | 'paired-t' | null;
   discordant?: {
     baselineOnly: number;
     candidateOnly: number;
   };
+  /**
+   * Why the paired test did not decide: `repeats` (both runs have ≥ 2 repeats; Welch decided), `partial-overlap` (ids only partly match), `no-shared-id`.
+   */
+  reason?: 'repeats' | 'partial-overlap' | 'no-shared-id' | null;
 }
 /**
  * One guardrail metric: its change and its non-inferiority call against the margin (confidence-interval approach, ICH E9 §3.3.2; Holm across guardrails).

@@ -35,4 +35,19 @@ export interface PairedPredictions {
   varDiff?: number;
   /** The split both prediction files are for. */
   split?: SplitName;
+  /** How per-example `loss` aggregates to the split value (continuous). Default `mean`. */
+  aggregate?: 'mean' | 'rmse' | 'sum';
+  /** The repeat the predictions belong to. Default 0. */
+  repeat?: number;
+  /** Each file's own rows (all of them, paired or not): count, mean, sample variance. */
+  sides?: { baseline: ExampleStats; candidate: ExampleStats };
+  /** Ids only partly match: not paired (rows 0); the sides still give the sampling noise. */
+  partial?: boolean;
+}
+
+/** Count, mean and sample variance of one file's per-example values. */
+export interface ExampleStats {
+  n: number;
+  mean: number;
+  variance: number;
 }

@@ -140,7 +140,15 @@ export function tradeOffPhrase(review: Review, esc: Escape): string | null {
   const costs = moved
     .map(([field, words]) => `${ratio(review.cost?.[field]?.ratio ?? 1)} ${words.noun}`)
     .join(' and ');
-  return `${change(review.validation.delta.estimate, f)} ${esc(review.metric.name, 60)} for ${costs}`;
+  const metric = esc(review.metric.name, 60);
+  // The gain is stated only when it is beyond noise; otherwise the cost is bought for nothing known.
+  const gain =
+    review.validation.change === 'better' || review.validation.change === 'worse'
+      ? `${change(review.validation.delta.estimate, f)} ${metric}`
+      : review.validation.change === 'flat'
+        ? `${metric} unchanged within noise`
+        : `a ${metric} change that cannot be told from noise yet`;
+  return `${gain} for ${costs}`;
 }
 
 /** Names of the guardrails with a given call. */

@@ -84,7 +84,7 @@ export function buildHeadline(review: Review, esc: Escape): Headline {
   const vSplit = review.splits.find((s) => s.split === 'validation');
   const movementTone: Tone = GOOD_MOVEMENTS.has(review.movement)
     ? 'good'
-    : review.movement === 'no-significant-change'
+    : review.movement === 'no-significant-change' || review.movement === 'undetermined'
       ? 'neutral'
       : 'bad';
   const vTone: Tone = v.change === 'better' ? 'good' : v.change === 'worse' ? 'bad' : 'neutral';

@@ -50,6 +50,9 @@ export function methodNotes(review: Review, esc: Escape): string[] {
   for (const [test, what] of uses) {
     lines.push(`${[...new Set(what)].join(', ')}: ${say(TEST_WHY, test, esc)}`);
   }
+  lines.push(
+    "Noise of a split's mean over k repeats: the seed spread s² plus the evaluation set's sampling noise σ² (binomial p(1 − p)/N, or s²/N from per-example values). On fixed evaluation rows σ² is shared by every repeat and does not average out, so Var(mean) = s²/k + σ²; on rows drawn per repeat the spread holds it, so Var(mean) = s²/k, never below σ²/k (law of total variance; Bouthillier et al. 2021). Degrees of freedom: Welch–Satterthwaite. A zero spread is not zero noise; where σ² cannot be known either, the change is undetermined.",
+  );
   if ((review.guardrails ?? []).some((g) => g.margin !== null)) {
     lines.push(
       `Guardrails: a guardrail is within its margin when the one-sided ${levelPercent(review)}% upper confidence bound of its worsening is below the margin, beyond it when the lower bound is above the margin, and undetermined otherwise (the confidence-interval approach to non-inferiority, ICH E9 §3.3.2 and E10; Wellek 2010). The one-sided p-values are Holm-adjusted across guardrails; the primary verdict is not adjusted by them. A margin from the config wins over the artifacts', the baseline's over the candidate's.`,

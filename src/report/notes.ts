@@ -4,7 +4,7 @@
  */
 import type { Note, NonLever, Review, RunWarning, UnavailableCode } from '../model/review.js';
 import type { Escape } from './escape.js';
-import { amount, count, type NumberFormat } from './format.js';
+import { amount, count, value, type NumberFormat } from './format.js';
 import { COMPONENT_ORDER, COMPONENT_TITLE, SPLIT_WORD, say, type Words } from './words.js';
 
 /** Names listed in a note, and "…" when there were more. */
@@ -25,9 +25,17 @@ export function noteSentence(note: Note, review: Review, f: NumberFormat, esc: E
     case 'hidden-regressions':
       return `Validation improved overall, yet ${slices(note.count)} regressed significantly (Holm-adjusted): ${names(note.names, note.count, esc)}.`;
     case 'noise-unknown':
-      return review.settings.minEffect > 0
-        ? `Run-to-run noise is unknown (one repeat of a continuous metric, no per-example predictions): changes are called on size alone (min-effect ${amount(review.settings.minEffect, f)}).`
-        : 'Run-to-run noise is unknown (one repeat of a continuous metric, no per-example predictions) and min-effect is 0: no change can be called. Add repeats (seeds), per-example predictions, or set min-effect.';
+      return 'Cannot tell: run-to-run noise is unknown (one repeat, or identical repeats, of a continuous metric without per-example predictions), so changes it touches are undetermined, whatever their size. Repeat each run with at least 2 seeds, or add per-example predictions.';
+    case 'reference-from-one-run':
+      return `Only the ${note.from} states a reference (${value(note.value, f)}): it is used for both runs, since the reference is a property of the task.`;
+    case 'references-differ':
+      return `Warning: the runs state different references (baseline ${value(note.baseline, f)}, candidate ${value(note.candidate, f)}); the candidate's is used for both, so the bias change is the change of training error.`;
+    case 'noise-from-evaluation-set':
+      return `The noise includes the evaluation set's sampling noise (${note.source === 'binomial' ? 'binomial' : 'from per-example values'}), which repeats on fixed rows do not show.`;
+    case 'predictions-partial-overlap':
+      return `The predictions files share ${count(note.shared)} ids of ${count(note.baseline)} (baseline) and ${count(note.candidate)} (candidate): not paired; the unpaired test decided.`;
+    case 'repeats-decided':
+      return "Both runs have two or more repeats: Welch's test over the repeats decided, since it holds the seed noise that a paired test over one repeat's rows leaves out.";
     case 'bias-unknown':
       return 'Avoidable bias is unknown: there is no reference level for this metric. Its change is still measured from the training error; the diagnosis rests on variance and data mismatch.';
     case 'predictions-share-no-id':
@@ -59,7 +67,43 @@ const WARNING: Words<RunWarning> = new Map([
     'validation-overfit',
     'test error is well above validation error: model choices may be tuned to the validation set.',
   ],
+  [
+    'below-reference',
+    'training error is below the reference level (negative avoidable bias): the model may be memorising noise, or the reference is wrong. This is not "better".',
+  ],
 ]);
+
+const MDE_METHOD: Words<NonNullable<Review['validation']['mde']>['method']> = new Map([
+  ['welch-noncentral-t', "Welch's t, noncentral t power"],
+  ['normal', 'normal approximation'],
+  ['fleiss-two-proportions', 'two proportions, Fleiss–Levin–Paik'],
+  ['mcnemar-connor', "McNemar, Connor's formula"],
+  ['paired-t', 'paired t'],
+]);
+
+/** One line: the smallest detectable validation change and the repeats that would detect it. */
+export function powerLine(review: Review, f: NumberFormat, esc: Escape): string | null {
+  const { mde, repeatsNeeded } = review.validation;
+  if (mde === undefined && repeatsNeeded === undefined) return null;
+  const alpha = review.settings.alpha;
+  const smallest =
+    mde === null || mde === undefined
+      ? 'The smallest detectable change is unknown (no noise estimate)'
+      : `This design detects a validation change of ${mde.atLeast ? 'at least ' : ''}${amount(mde.value, f)} with 80% power at two-sided alpha ${alpha} (${say(MDE_METHOD, mde.method, esc)})`;
+  let repeats = '';
+  if (repeatsNeeded !== undefined) {
+    if (repeatsNeeded.repeats !== null)
+      repeats = `; ${repeatsNeeded.lowerBound ? 'at least ' : ''}${count(repeatsNeeded.repeats)} repeats per run would detect the observed change`;
+    else if (repeatsNeeded.reason === 'noise-unknown')
+      repeats = '; repeat each run with at least 2 seeds to measure the noise';
+    else if (repeatsNeeded.reason === 'fixed-noise')
+      repeats =
+        "; the fixed evaluation set's sampling noise alone hides the observed change: more seeds cannot help, a larger evaluation set can";
+    else if (repeatsNeeded.reason === 'beyond-limit')
+      repeats = '; more than 1,000 repeats per run would be needed to detect the observed change';
+  }
+  return `${smallest}${repeats}.`;
+}
 
 /** The review's notes, the runs' warnings and the non-levers, one sentence each. */
 export function reviewNotes(review: Review, f: NumberFormat, esc: Escape): string[] {
@@ -67,6 +111,7 @@ export function reviewNotes(review: Review, f: NumberFormat, esc: Escape): strin
     ...(['baseline', 'candidate'] as const).flatMap((run) =>
       review[run].warnings.map((w) => `${run}: ${say(WARNING, w, esc)}`),
     ),
+    ...[powerLine(review, f, esc)].filter((l): l is string => l !== null),
     ...review.notes.map((n) => noteSentence(n, review, f, esc)),
     ...review.nonLevers.map((n) => say(NON_LEVER, n, esc)),
   ];

@@ -37,6 +37,7 @@ export const MOVEMENT_TITLE = words<Movement>({
   'no-significant-change': 'no change beyond noise',
   'toward-underfitting': 'toward underfitting',
   'worse-on-both': 'more bias and more variance',
+  undetermined: 'cannot tell: no noise estimate',
 });
 
 export const MOVEMENT_SENTENCE = words<Movement>({
@@ -48,12 +49,15 @@ export const MOVEMENT_SENTENCE = words<Movement>({
     'The change did not move avoidable bias or variance beyond run-to-run noise',
   'toward-underfitting': 'The change moved the model toward underfitting',
   'worse-on-both': 'The change raised both avoidable bias and variance',
+  undetermined:
+    'Whether the change moved avoidable bias or variance cannot be told: their noise is unknown',
 });
 
 export const VALIDATION_WORD = words<ValidationChange>({
   better: 'better',
   worse: 'worse',
   flat: 'unchanged within noise',
+  undetermined: 'undetermined (noise unknown)',
 });
 
 export const DIAGNOSIS_WORD = words<Diagnosis>({
@@ -117,6 +121,7 @@ export const TEST_WORD = words<TestName>({
   'z-binomial': 'binomial z-test',
   'mcnemar-exact': "McNemar's exact test",
   'paired-t': 'paired t-test',
+  'newcombe-score': "Newcombe's score interval",
   none: 'no test',
 });
 
@@ -129,11 +134,14 @@ export const TEST_WHY = words<TestName>({
     "McNemar's exact test: both runs scored the same examples, so only the examples on which they disagree carry information.",
   'paired-t':
     'paired t-test on per-example loss differences: both runs scored the same examples with a continuous loss.',
+  'newcombe-score':
+    "Newcombe's hybrid score interval for a difference of two proportions (Newcombe 1998, method 10), its p-value inverting the interval: one repeat of a proportion metric on a known number of examples.",
   none: 'no test: with one repeat of a continuous metric and no paired predictions, run-to-run noise is unknown, so only min-effect decides.',
 });
 
 export const REFERENCE_SOURCE = words<ReferenceSource>({
   artifact: 'from the artifact',
+  'other-run': "from the other run's artifact (one reference for both runs)",
   config: 'from the config',
   default: 'the default for a minimized proportion',
   unknown: 'source unknown',

@@ -1,5 +1,6 @@
 /** Names of the significance tests fitgap reports (DESIGN.md §4). */
-export type TestName = 'welch-t' | 'z-binomial' | 'mcnemar-exact' | 'paired-t' | 'none';
+export type TestName =
+  'welch-t' | 'z-binomial' | 'mcnemar-exact' | 'paired-t' | 'newcombe-score' | 'none';
 
 /** A two-sided interval [low, high]. */
 export type Interval = [number, number];

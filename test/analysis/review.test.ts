@@ -2,6 +2,7 @@ import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { buildReview } from '../../src/analysis/review.js';
 import { movementOf } from '../../src/analysis/movement.js';
+import { newcombeInterval } from '../../src/stats/index.js';
 import { validateRun } from '../../src/validate/run.js';
 import { makeRun, SETTINGS } from './make-run.js';
 
@@ -42,7 +43,9 @@ describe('buildReview', () => {
     expect(c.mismatch.value).toBeCloseTo(0.03, 12);
     expect(c.overfit.value).toBeCloseTo(0.01, 12);
     expect(review.candidate.diagnosis).toBe('data-mismatch');
-    expect(review.movement).toBe('no-significant-change');
+    // Identical repeats of a continuous metric without per-example values: zero spread is not
+    // zero noise, so nothing can be called.
+    expect(review.movement).toBe('undetermined');
   });
 
   it('calls toward-overfitting when train error falls and the gap widens', () => {
@@ -65,13 +68,13 @@ describe('buildReview', () => {
     const b = makeRun({
       reference: 0.02,
       train: [0.05, 0.051, 0.049],
-      validation: [0.09, 0.091, 0.089],
+      validation: [0.09, 0.092, 0.089],
       hyperparameters: { lambda: 0.1 },
     });
     const c = makeRun({
       reference: 0.02,
       train: [0.09, 0.091, 0.089],
-      validation: [0.1, 0.101, 0.099],
+      validation: [0.1, 0.103, 0.098],
       hyperparameters: { lambda: 10 },
     });
     const review = buildReview({ baseline: b, candidate: c, settings: SETTINGS });
@@ -104,10 +107,11 @@ describe('buildReview', () => {
     const b = makeRun({ kind: 'proportion', examples: 5000, train: [0.03], validation: [0.07] });
     const c = makeRun({ kind: 'proportion', examples: 5000, train: [0.03], validation: [0.06] });
     const review = buildReview({ baseline: b, candidate: c, settings: SETTINGS });
-    expect(review.validation.delta.test).toBe('z-binomial');
-    // Source: normal approximation, unpooled SE sqrt(.07·.93/5000 + .06·.94/5000) (common practice)
-    const se = Math.sqrt((0.07 * 0.93) / 5000 + (0.06 * 0.94) / 5000);
-    expect(review.validation.delta.ci?.[0]).toBeCloseTo(-0.01 - 1.959964 * se, 6);
+    expect(review.validation.delta.test).toBe('newcombe-score');
+    // Source: Newcombe (1998), method 10, on 350/5000 vs 300/5000 errors (stats/proportion-difference.ts).
+    const ci = newcombeInterval(350, 5000, 300, 5000, SETTINGS.alpha);
+    expect(review.validation.delta.ci?.[0]).toBeCloseTo(ci[0], 9);
+    expect(review.validation.delta.ci?.[1]).toBeCloseTo(ci[1], 9);
     expect(review.validation.change).toBe('better');
     // The reference defaults to 0 for a minimized proportion (DESIGN.md §2).
     expect(review.candidate.referenceSource).toBe('default');
@@ -120,16 +124,22 @@ describe('buildReview', () => {
     const review = buildReview({ baseline: b, candidate: c, settings: SETTINGS });
     expect(review.validation.delta.test).toBe('none');
     expect(review.validation.delta.p).toBeNull();
-    expect(review.movement).toBe('no-significant-change');
+    expect(review.movement).toBe('undetermined');
+    expect(review.validation.change).toBe('undetermined');
+    expect(review.validation.repeatsNeeded).toEqual({
+      repeats: null,
+      lowerBound: false,
+      reason: 'noise-unknown',
+    });
     expect(review.notes).toContainEqual({ code: 'noise-unknown' });
     expect(review.levers.map((l) => l.id)).toContain('add-repeats');
-    // With a min-effect, size alone decides.
+    // Size alone never decides: an unknown noise may exceed any change.
     const sized = buildReview({
       baseline: b,
       candidate: c,
       settings: { ...SETTINGS, minEffect: 0.1 },
     });
-    expect(sized.movement).toBe('toward-overfitting');
+    expect(sized.movement).toBe('undetermined');
   });
 
   it('reports bias as unknown without a reference for a continuous metric', () => {

@@ -205,7 +205,12 @@ export async function referencePairPredictions(
   baseline: PredictionsFile,
   candidate: PredictionsFile,
   kind: MetricKind,
-): Promise<PairedPredictions & { unmatched: { baseline: number; candidate: number } }> {
+): Promise<
+  PairedPredictions & {
+    unmatched: { baseline: number; candidate: number };
+    sides: NonNullable<PairedPredictions['sides']>;
+  }
+> {
   const baseHashes = new HashLog();
   const candHashes = new HashLog();
   const base = readRows(baseline, kind, baseHashes);
@@ -216,6 +221,9 @@ export async function referencePairPredictions(
   let baselineOnly = 0;
   let candidateOnly = 0;
   const diffs = new RunningStats();
+  // Each file's own rows, paired or not: they must reproduce the artifact's split value.
+  const baseAll = new RunningStats();
+  const candAll = new RunningStats();
 
   const pair = (b: number, c: number): void => {
     rows++;
@@ -246,6 +254,8 @@ export async function referencePairPredictions(
         } else waitingCand.set(b.value.id, b.value.value);
       }
     }
+    if (!a.done) baseAll.push(a.value.value);
+    if (!b.done) candAll.push(b.value.value);
     if (!a.done) a = await base.next();
     if (!b.done) b = await cand.next();
   }
@@ -258,8 +268,15 @@ export async function referencePairPredictions(
   if (issues.length > 0) throw new InputError(issues);
 
   const unmatched = { baseline: waitingBase.size, candidate: waitingCand.size };
-  if (kind === 'proportion') return { kind, rows, baselineOnly, candidateOnly, unmatched };
+  const stats = (s: RunningStats): { n: number; mean: number; variance: number } => ({
+    n: s.n,
+    mean: s.n > 0 ? s.mean : 0,
+    variance: s.n > 1 ? s.variance : 0,
+  });
+  const sides = { baseline: stats(baseAll), candidate: stats(candAll) };
+  if (kind === 'proportion') return { kind, rows, baselineOnly, candidateOnly, unmatched, sides };
   return {
+    sides,
     kind,
     rows,
     meanDiff: diffs.n > 0 ? diffs.mean : 0,

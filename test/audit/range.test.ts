@@ -270,7 +270,7 @@ describe('fitgap audit (CLI, in process)', () => {
     const rows = run.stdout.split('\n').filter((l) => /^[0-9a-f]{7} {2}2026/.test(l));
     expect(rows.map((r) => r.slice(0, 7))).toEqual([s(0), s(1), s(4), s(6)]);
     expect(rows[1]).toMatch(
-      /toward overfitting +6\.633 \[6\.254, 7\.013\] +−0\.400 \[−0\.746, −0\.054\] better +1\.000 \(down\) +3\.033 \(up\) +high variance \(overfitting\)/,
+      /toward overfitting +6\.633 \[5\.527, 7\.739\] +−0\.400 \[−1\.985, \+1\.185\] unchanged within noise +1\.000 \(down\) +3\.033 \(up\) +high variance \(overfitting\)/,
     );
     expect(run.stdout).toContain(
       `  ${s(5)} Remove run artifacts: no artifact, runs/model.json was deleted (it existed at ${s(4)})`,

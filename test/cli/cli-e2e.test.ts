@@ -153,7 +153,13 @@ describe('fitgap CLI (built)', () => {
       expect(result.code).toBe(0);
       movements.push((JSON.parse(result.stdout) as { movement: string }).movement);
     }
-    expect(movements).toEqual(['toward-overfitting', 'toward-underfitting', 'better-on-both']);
+    // 3-more-data: on a fixed evaluation set of known size, its sampling noise leaves the variance
+    // change flat, so only the bias change is called.
+    expect(movements).toEqual([
+      'toward-overfitting',
+      'toward-underfitting',
+      'away-from-underfitting',
+    ]);
   });
 
   it('prints plain text without colour under NO_COLOR and within 80 columns', async () => {

@@ -272,7 +272,8 @@ describe('bad input that used to crash (exit 3)', () => {
       delete d['reference'];
       d['predictions'] = { split: 'validation', path: 'one.csv' };
     });
-    const dir = folder({ 'one.json': one, 'one.csv': 'id,loss\no1,1\n' });
+    // The one row's loss is the split value, so the file reproduces its artifact.
+    const dir = folder({ 'one.json': one, 'one.csv': 'id,loss\no1,0.061\n' });
     refused(
       await cli(dir, review('one.json', 'one.json')),
       'one.csv and one.csv must share at least 2 ids to be paired (got 1 shared',

@@ -149,9 +149,10 @@ describe('note sentences', () => {
     );
   });
 
-  it('states min-effect in the metric unit style', () => {
-    expect(say1({ code: 'noise-unknown' })).toBe(
-      'Run-to-run noise is unknown (one repeat of a continuous metric, no per-example predictions): changes are called on size alone (min-effect 0.50 pts).',
+  it('says cannot tell when the noise is unknown, whatever min-effect', () => {
+    expect(say1({ code: 'noise-unknown' })).toMatch(/^Cannot tell: run-to-run noise is unknown/);
+    expect(say1({ code: 'reference-from-one-run', from: 'baseline', value: 0.02 })).toBe(
+      'Only the baseline states a reference (2.00%): it is used for both runs, since the reference is a property of the task.',
     );
   });
 
