@@ -20,19 +20,28 @@ import {
   type ComponentChanges,
 } from './changes.js';
 import { applyGate } from './gate.js';
-import { diffHyperparameters, pulledLevers } from './hyperparameters.js';
+import type { HyperparameterRolesConfig } from '../model/hyperparameter-roles.js';
+import type { HyperparameterChange } from '../model/review.js';
 import { chooseLevers } from './levers/choose.js';
+import { knobValues, regularizationKnob, runRoles, runVocabulary } from './levers/knobs.js';
+import { prChanges, type PrChange } from './levers/pr-changes.js';
+import { BUILT_IN_VOCABULARY, mergeRoles } from './levers/resolve-knob.js';
 import { shortfallSign } from './measure.js';
 import { movementOf, validationChangeOf } from './movement.js';
 import { toMetricDelta, toMetricUnits, toShortfallDelta, type CallSettings } from './noise.js';
-import { regularizationOf, summarize } from './run-summary.js';
+import { summarize } from './run-summary.js';
 import { compareSlices } from './slices.js';
 
 export interface ReviewInput {
   baseline: RunArtifact;
   candidate: RunArtifact;
   /** `failOn` holds validated outcomes; an unknown one is a bug in the caller. */
-  settings: Omit<ReviewSettings, 'failOn'> & { failOn: readonly string[]; reference?: number };
+  settings: Omit<ReviewSettings, 'failOn'> & {
+    failOn: readonly string[];
+    reference?: number;
+    /** The config's hyperparameter roles, laid over the built-in vocabulary. */
+    hyperparameters?: HyperparameterRolesConfig;
+  };
   paired?: PairedPredictions;
   /** Notes from loading (files not used, rows without a partner…). */
   notes?: Note[];
@@ -73,7 +82,16 @@ export function buildReview(input: ReviewInput): Review {
   const settings = reviewSettings(input.settings);
   const calls: CallSettings = { alpha: settings.alpha, minEffect: settings.minEffect };
   const reference = input.settings.reference;
-  const summarySettings = { ...settings, ...(reference === undefined ? {} : { reference }) };
+  const vocabulary = runVocabulary(
+    mergeRoles(BUILT_IN_VOCABULARY, input.settings.hyperparameters),
+    baseline.hyperparameters,
+    candidate.hyperparameters,
+  );
+  const summarySettings = {
+    ...settings,
+    vocabulary,
+    ...(reference === undefined ? {} : { reference }),
+  };
   const base = summarize(baseline, summarySettings);
   const cand = summarize(candidate, summarySettings);
   const runs = { baseline, candidate };
@@ -95,7 +113,11 @@ export function buildReview(input: ReviewInput): Review {
   const sliceResult = compareSlices(baseline, candidate, validation.change, calls);
   const noiseUnknown = validation.delta.test === 'none' || components.variance.test === 'none';
 
-  const changes = diffHyperparameters(baseline.hyperparameters, candidate.hyperparameters);
+  const changes = prChanges(
+    knobValues(baseline.hyperparameters),
+    knobValues(candidate.hyperparameters),
+    vocabulary,
+  );
   const { levers, nonLevers } = chooseLevers({
     goal: candidate.metric.goal,
     candidate: cand,
@@ -103,9 +125,10 @@ export function buildReview(input: ReviewInput): Review {
     movement,
     bias: components.bias ?? NO_BIAS_CHANGE,
     variance: components.variance,
-    pulled: pulledLevers(changes),
     changes,
-    regularization: regularizationOf(candidate),
+    vocabulary,
+    roles: runRoles(candidate.hyperparameters, vocabulary),
+    regularization: regularizationKnob(candidate.hyperparameters, vocabulary),
     noiseUnknown,
   });
   const gate = applyGate(
@@ -127,7 +150,7 @@ export function buildReview(input: ReviewInput): Review {
     baseline: base,
     candidate: cand,
     slices: sliceResult.slices,
-    hyperparameters: changes,
+    hyperparameters: changes.map(hyperparameterChange),
     levers,
     nonLevers,
     gate,
@@ -140,6 +163,7 @@ export function buildReview(input: ReviewInput): Review {
         noiseUnknown,
         biasUnknown: cand.biasUnknown,
         paired: input.paired,
+        changes,
       }),
     ],
     paired: pairedSummary(input.paired),
@@ -154,8 +178,22 @@ function reviewNotes(facts: {
   noiseUnknown: boolean;
   biasUnknown: boolean;
   paired: PairedPredictions | undefined;
+  changes: PrChange[];
 }): Note[] {
   const notes: Note[] = [];
+  const unmapped = facts.changes.filter((c) => c.origin === 'unknown' || c.origin === 'ambiguous');
+  if (unmapped.length > 0) {
+    notes.push({
+      code: 'unmapped-hyperparameters',
+      count: unmapped.length,
+      changes: unmapped.slice(0, NOTE_NAMES).map((c) => ({
+        key: c.hyperparameter,
+        ambiguous: c.origin === 'ambiguous',
+        baseline: c.from ?? null,
+        candidate: c.to ?? null,
+      })),
+    });
+  }
   if (facts.components.varianceFallback) notes.push({ code: 'train-dev-in-one-run' });
   if (facts.unpaired.length > 0) {
     notes.push({
@@ -177,6 +215,25 @@ function reviewNotes(facts: {
   if (facts.paired !== undefined && facts.paired.rows === 0)
     notes.push({ code: 'predictions-share-no-id' });
   return notes;
+}
+
+/** A PR change as the review records it: the artifact's values, the kind, the role and effect. */
+function hyperparameterChange(c: PrChange): HyperparameterChange {
+  return {
+    key: c.hyperparameter,
+    baseline: c.from ?? null,
+    candidate: c.to ?? null,
+    kind: c.direction,
+    role: c.role,
+    inverse: c.inverse,
+    origin: c.origin,
+    effect: c.effect,
+    ...(c.ratio === undefined ? {} : { ratio: c.ratio }),
+    ...(c.totalUnits === undefined ? {} : { totalUnits: true }),
+    ...(c.unlimited === undefined
+      ? {}
+      : { unlimited: c.unlimited === 'from' ? ('baseline' as const) : ('candidate' as const) }),
+  };
 }
 
 function pairedSummary(paired: PairedPredictions | undefined): Review['paired'] {

@@ -5,7 +5,8 @@ import { mean, sampleVariance, tQuantile, wilsonInterval } from '../stats/index.
 import type { Interval } from '../stats/types.js';
 import { analyzeCurves } from './curves/index.js';
 import { chooseReference, decompose, diagnose, errorLevel } from './decompose.js';
-import { knobOf } from './hyperparameters.js';
+import { regularizationKnob } from './levers/knobs.js';
+import { BUILT_IN_VOCABULARY, type Vocabulary } from './levers/resolve-knob.js';
 import type { RunSummary, SplitSummary } from '../model/review.js';
 
 export interface SummarySettings {
@@ -13,6 +14,8 @@ export interface SummarySettings {
   minEffect: number;
   gapTolerance: number;
   reference?: number;
+  /** Hyperparameter names → roles, for the knob the regularization sweep varies. */
+  vocabulary?: Vocabulary;
 }
 
 function splitSummary(run: RunArtifact, split: SplitName, alpha: number): SplitSummary | null {
@@ -31,19 +34,13 @@ function splitSummary(run: RunArtifact, split: SplitName, alpha: number): SplitS
   return { split, mean: m, sd, repeats: n, examples: s.examples ?? null, ci };
 }
 
-/** The run's regularization strength (a weight penalty; dropout is not one), if it names one. */
-export function regularizationOf(run: RunArtifact): { key: string; value: number } | undefined {
-  for (const [key, value] of Object.entries(run.hyperparameters ?? {})) {
-    if (typeof value === 'number' && knobOf(key) === 'regularization' && !/dropout/i.test(key))
-      return { key, value };
-  }
-  return undefined;
-}
-
 export function summarize(run: RunArtifact, settings: SummarySettings): RunSummary {
   const reference = chooseReference(run, settings.reference);
   const components = decompose(run, reference.value, settings);
-  const lambda = regularizationOf(run)?.value;
+  const lambda = regularizationKnob(
+    run.hyperparameters,
+    settings.vocabulary ?? BUILT_IN_VOCABULARY,
+  )?.value;
   return {
     name: run.run.name,
     commit: run.run.commit ?? null,

@@ -74,7 +74,15 @@ describe('lever sentences', () => {
         score: 100,
         suggestion: { hyperparameter: 'lambda', value: 0.5477, basis: 'between-old-and-new' },
         evidence: [
-          { kind: 'pr-change', hyperparameter: 'lambda', from: 0.1, to: 3, direction: 'raised' },
+          {
+            kind: 'pr-change',
+            hyperparameter: 'lambda',
+            from: 0.1,
+            to: 3,
+            direction: 'raised',
+            role: 'regularization',
+            effect: 'more-regularization',
+          },
           {
             kind: 'component-change',
             component: 'bias',
@@ -131,7 +139,15 @@ describe('lever sentences', () => {
       id: 'fewer-features',
       score: 90,
       evidence: [
-        { kind: 'pr-change', hyperparameter: 'a|b @team', from: 1, to: 2, direction: 'raised' },
+        {
+          kind: 'pr-change',
+          hyperparameter: 'a|b @team',
+          from: 1,
+          to: 2,
+          direction: 'raised',
+          role: 'capacity',
+          effect: 'more-capacity',
+        },
       ],
     });
     expect(sentence).toBe('This PR raised a\\|b @\u200Dteam 1 → 2.');
