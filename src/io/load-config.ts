@@ -7,6 +7,8 @@ import type { ValidateFunction } from 'ajv';
 import { parseDocument } from 'yaml';
 import schema from '../../schema/fitgap-config.schema.json' with { type: 'json' };
 import { InputError, quote, type Issue } from '../model/errors.js';
+import type { HyperparameterRolesConfig } from '../model/hyperparameter-roles.js';
+import { configRoleConflicts } from '../analysis/levers/resolve-knob.js';
 import { ajvIssues } from '../validate/ajv-issues.js';
 import { FAIL_ON_VALUES, isFailOn } from '../model/settings.js';
 import type { ConfigFile } from '../model/config.js';
@@ -31,6 +33,22 @@ export function failOnIssues(values: readonly string[], file: string, pointer: s
           },
         ],
   );
+}
+
+/** Config names that match the same knob (`C` and `c`): only one of them could take effect. */
+function roleConflictIssues(map: HyperparameterRolesConfig | undefined, file: string): Issue[] {
+  if (map === undefined) return [];
+  return configRoleConflicts(map).map((group) => ({
+    file,
+    pointer: `/hyperparameters/${escapePointer(group[group.length - 1] ?? '')}`,
+    expected: `one entry per hyperparameter name (names match up to case, '-' and '_')`,
+    got: group.map(quote).join(', '),
+    hint: 'Keep one of these entries.',
+  }));
+}
+
+function escapePointer(key: string): string {
+  return key.replace(/~/g, '~0').replace(/\//g, '~1');
 }
 
 /** Parses and validates config text. */
@@ -60,7 +78,10 @@ export function parseConfig(text: string, file: string): ConfigFile {
       })),
     );
   }
-  const issues = failOnIssues(data['fail-on'] ?? [], file, '/fail-on');
+  const issues = [
+    ...failOnIssues(data['fail-on'] ?? [], file, '/fail-on'),
+    ...roleConflictIssues(data.hyperparameters, file),
+  ];
   if (issues.length > 0) throw new InputError(issues);
   return data;
 }

@@ -58,6 +58,7 @@ export function resolveSettings(
       overrides.gapTolerance ?? config['gap-tolerance'] ?? DEFAULT_SETTINGS.gapTolerance,
     failOn: overrides.failOn ?? config['fail-on'] ?? [...DEFAULT_SETTINGS.failOn],
     ...(reference === undefined ? {} : { reference }),
+    ...(config.hyperparameters === undefined ? {} : { hyperparameters: config.hyperparameters }),
   };
 }
 
