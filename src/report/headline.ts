@@ -13,7 +13,8 @@ import {
   type NumberFormat,
 } from './format.js';
 import { gateSentence } from './gate.js';
-import { leverText } from './levers.js';
+import { leverHeadline } from './levers.js';
+import { prSummary } from './pr-summary.js';
 import { sortSlices } from './tables.js';
 import {
   DIAGNOSIS_WORD,
@@ -77,7 +78,13 @@ export function buildHeadline(review: Review, esc: Escape): Headline {
       : `${change(v.delta.estimate, f)}, ${levelPercent(review)}% interval ${changeInterval(v.delta.ci, f)}, ${pText(v.delta.p)}, ${say(TEST_WORD, v.delta.test, esc)}`;
   const from =
     vSplit === undefined ? '' : `${value(vSplit.baseline, f)} → ${value(vSplit.candidate, f)} `;
+  const did = prSummary(review, esc);
+  const errorTerms =
+    review.metric.goal === 'maximize'
+      ? ` Bias and variance are in error terms (1 − ${metric}).`
+      : '';
   const lines: HeadlineLine[] = [
+    ...(did === null ? [] : [{ label: 'This PR', text: did, tone: 'neutral' as const }]),
     {
       label: say(MOVEMENT_SENTENCE, review.movement, esc),
       text: `${changePhrase('avoidable bias', review.bias.delta, review, f)}; ${changePhrase(
@@ -89,7 +96,7 @@ export function buildHeadline(review: Review, esc: Escape): Headline {
         DIAGNOSIS_WORD,
         review.candidate.diagnosis,
         esc,
-      )}.`,
+      )}.${errorTerms}`,
       tone: movementTone,
     },
     {
@@ -107,7 +114,7 @@ export function buildHeadline(review: Review, esc: Escape): Headline {
   if (first === undefined)
     lines.push({ label: 'Next lever', text: 'none suggested.', tone: 'neutral' });
   else {
-    const text = leverText(first, review, f, esc);
+    const text = leverHeadline(first, review, f, esc);
     lines.push({
       label: `Next lever: ${text.title}`,
       text: text.sentences.join(' ') || '—',

@@ -36,6 +36,24 @@ export function leverText(lever: Lever, review: Review, f: NumberFormat, esc: Es
   return { title: say(LEVER_TITLE, lever.id, esc), sentences };
 }
 
+/**
+ * The lever in one short sentence for the headline: its suggestion when it has one, else its first
+ * measured or PR-change reason.
+ */
+export function leverHeadline(
+  lever: Lever,
+  review: Review,
+  f: NumberFormat,
+  esc: Escape,
+): LeverText {
+  const ctx = { review, f, esc };
+  const title = say(LEVER_TITLE, lever.id, esc);
+  if (lever.suggestion !== undefined)
+    return { title, sentences: [suggestionSentence(lever.suggestion, ctx)] };
+  const first = lever.evidence.flatMap((e) => evidenceSentence(e, lever.id, ctx) ?? [])[0];
+  return { title, sentences: first === undefined ? [] : [first] };
+}
+
 /** A change `from → to` of a hyperparameter; null is "no limit". */
 function fromTo(e: { from: number | null; to: number | null }): string {
   const v = (x: number | null): string => (x === null ? 'no limit' : short(x));

@@ -93,7 +93,11 @@ export function contextFor(
 ): LeverContext {
   const b = c.baseline.hyperparameters;
   const h = c.candidate.hyperparameters;
-  const vocabulary = runVocabulary(mergeRoles(BUILT_IN_VOCABULARY, c.config?.hyperparameters), b, h);
+  const vocabulary = runVocabulary(
+    mergeRoles(BUILT_IN_VOCABULARY, c.config?.hyperparameters),
+    b,
+    h,
+  );
   const summary = summaryWith(c.candidateDiagnosis);
   return {
     goal: 'minimize',
