@@ -10427,9 +10427,9 @@ var require_stringifyNumber = __commonJS({
     function stringifyNumber({ format, minFractionDigits, tag, value: value2 }) {
       if (typeof value2 === "bigint")
         return String(value2);
-      const num = typeof value2 === "number" ? value2 : Number(value2);
-      if (!isFinite(num))
-        return isNaN(num) ? ".nan" : num < 0 ? "-.inf" : ".inf";
+      const num2 = typeof value2 === "number" ? value2 : Number(value2);
+      if (!isFinite(num2))
+        return isNaN(num2) ? ".nan" : num2 < 0 ? "-.inf" : ".inf";
       let n = Object.is(value2, -0) ? "-0" : JSON.stringify(value2);
       if (!format && minFractionDigits && (!tag || tag === "tag:yaml.org,2002:float") && /^-?\d/.test(n) && !n.includes("e")) {
         let i = n.indexOf(".");
@@ -10469,8 +10469,8 @@ var require_float = __commonJS({
       test: /^[-+]?(?:\.[0-9]+|[0-9]+(?:\.[0-9]*)?)[eE][-+]?[0-9]+$/,
       resolve: (str) => parseFloat(str),
       stringify(node) {
-        const num = Number(node.value);
-        return isFinite(num) ? num.toExponential() : stringifyNumber.stringifyNumber(node);
+        const num2 = Number(node.value);
+        return isFinite(num2) ? num2.toExponential() : stringifyNumber.stringifyNumber(node);
       }
     };
     var float = {
@@ -10909,8 +10909,8 @@ var require_float2 = __commonJS({
       test: /^[-+]?(?:[0-9][0-9_]*)?(?:\.[0-9_]*)?[eE][-+]?[0-9]+$/,
       resolve: (str) => parseFloat(str.replace(/_/g, "")),
       stringify(node) {
-        const num = Number(node.value);
-        return isFinite(num) ? num.toExponential() : stringifyNumber.stringifyNumber(node);
+        const num2 = Number(node.value);
+        return isFinite(num2) ? num2.toExponential() : stringifyNumber.stringifyNumber(node);
       }
     };
     var float = {
@@ -11112,23 +11112,23 @@ var require_timestamp = __commonJS({
     function parseSexagesimal(str, asBigInt) {
       const sign = str[0];
       const parts = sign === "-" || sign === "+" ? str.substring(1) : str;
-      const num = (n) => asBigInt ? BigInt(n) : Number(n);
-      const res = parts.replace(/_/g, "").split(":").reduce((res2, p) => res2 * num(60) + num(p), num(0));
-      return sign === "-" ? num(-1) * res : res;
+      const num2 = (n) => asBigInt ? BigInt(n) : Number(n);
+      const res = parts.replace(/_/g, "").split(":").reduce((res2, p) => res2 * num2(60) + num2(p), num2(0));
+      return sign === "-" ? num2(-1) * res : res;
     }
     function stringifySexagesimal(node) {
       let { value: value2 } = node;
-      let num = (n) => n;
+      let num2 = (n) => n;
       if (typeof value2 === "bigint")
-        num = (n) => BigInt(n);
+        num2 = (n) => BigInt(n);
       else if (isNaN(value2) || !isFinite(value2))
         return stringifyNumber.stringifyNumber(node);
       let sign = "";
       if (value2 < 0) {
         sign = "-";
-        value2 *= num(-1);
+        value2 *= num2(-1);
       }
-      const _60 = num(60);
+      const _60 = num2(60);
       const parts = [value2 % _60];
       if (value2 < 60) {
         parts.unshift(0);
@@ -15441,8 +15441,8 @@ var require_jstat = __commonJS({
         function isFunction(arg) {
           return toString.call(arg) === "[object Function]";
         }
-        function isNumber(num) {
-          return typeof num === "number" ? num - num === 0 : false;
+        function isNumber(num2) {
+          return typeof num2 === "number" ? num2 - num2 === 0 : false;
         }
         function toVector(arr) {
           return concat.apply([], arr);
@@ -17404,9 +17404,9 @@ var require_jstat = __commonJS({
               var samplesDone = 0;
               for (var i = 0; i < x; i++) {
                 while (scaledCDF > 1 && samplesDone < n) {
-                  var factor = 1 - m / (N - samplesDone);
-                  scaledPDF *= factor;
-                  scaledCDF *= factor;
+                  var factor2 = 1 - m / (N - samplesDone);
+                  scaledPDF *= factor2;
+                  scaledCDF *= factor2;
                   samplesDone++;
                 }
                 scaledPDF *= (n - i) * (m - i) / ((i + 1) * (N - m - n + i + 1));
@@ -18026,7 +18026,7 @@ var require_jstat = __commonJS({
             return determinant;
           },
           gauss_elimination: function gauss_elimination(a, b) {
-            var i = 0, j = 0, n = a.length, m = a[0].length, factor = 1, sum = 0, x = [], maug, pivot, temp, k;
+            var i = 0, j = 0, n = a.length, m = a[0].length, factor2 = 1, sum = 0, x = [], maug, pivot, temp, k;
             a = jStat4.aug(a, b);
             maug = a[0].length;
             for (i = 0; i < n; i++) {
@@ -18046,9 +18046,9 @@ var require_jstat = __commonJS({
                 }
               }
               for (j = i + 1; j < n; j++) {
-                factor = a[j][i] / a[i][i];
+                factor2 = a[j][i] / a[i][i];
                 for (k = i; k < maug; k++) {
-                  a[j][k] = a[j][k] - factor * a[i][k];
+                  a[j][k] = a[j][k] - factor2 * a[i][k];
                 }
               }
             }
@@ -18326,13 +18326,13 @@ var require_jstat = __commonJS({
             var i = 0;
             var w = [];
             var p = [];
-            var alpha, r, k, j, factor;
+            var alpha, r, k, j, factor2;
             for (; i < m - 1; i++) {
               alpha = 0;
               for (j = i + 1; j < n; j++)
                 alpha += a[j][i] * a[j][i];
-              factor = a[i + 1][i] > 0 ? -1 : 1;
-              alpha = factor * Math2.sqrt(alpha);
+              factor2 = a[i + 1][i] > 0 ? -1 : 1;
+              alpha = factor2 * Math2.sqrt(alpha);
               r = Math2.sqrt((alpha * alpha - a[i + 1][i] * alpha) / 2);
               w = jStat4.zeros(m, 1);
               w[i + 1][0] = (a[i + 1][i] - alpha) / (2 * r);
@@ -18950,28 +18950,28 @@ var require_jstat = __commonJS({
           // (value, alpha, sd, n)
           // (value, alpha, array)
           normalci: function normalci() {
-            var args = slice.call(arguments), ans = new Array(2), change2;
+            var args = slice.call(arguments), ans = new Array(2), change3;
             if (args.length === 4) {
-              change2 = Math2.abs(jStat4.normal.inv(args[1] / 2, 0, 1) * args[2] / Math2.sqrt(args[3]));
+              change3 = Math2.abs(jStat4.normal.inv(args[1] / 2, 0, 1) * args[2] / Math2.sqrt(args[3]));
             } else {
-              change2 = Math2.abs(jStat4.normal.inv(args[1] / 2, 0, 1) * jStat4.stdev(args[2]) / Math2.sqrt(args[2].length));
+              change3 = Math2.abs(jStat4.normal.inv(args[1] / 2, 0, 1) * jStat4.stdev(args[2]) / Math2.sqrt(args[2].length));
             }
-            ans[0] = args[0] - change2;
-            ans[1] = args[0] + change2;
+            ans[0] = args[0] - change3;
+            ans[1] = args[0] + change3;
             return ans;
           },
           // 2 different parameter setups
           // (value, alpha, sd, n)
           // (value, alpha, array)
           tci: function tci() {
-            var args = slice.call(arguments), ans = new Array(2), change2;
+            var args = slice.call(arguments), ans = new Array(2), change3;
             if (args.length === 4) {
-              change2 = Math2.abs(jStat4.studentt.inv(args[1] / 2, args[3] - 1) * args[2] / Math2.sqrt(args[3]));
+              change3 = Math2.abs(jStat4.studentt.inv(args[1] / 2, args[3] - 1) * args[2] / Math2.sqrt(args[3]));
             } else {
-              change2 = Math2.abs(jStat4.studentt.inv(args[1] / 2, args[2].length - 1) * jStat4.stdev(args[2], true) / Math2.sqrt(args[2].length));
+              change3 = Math2.abs(jStat4.studentt.inv(args[1] / 2, args[2].length - 1) * jStat4.stdev(args[2], true) / Math2.sqrt(args[2].length));
             }
-            ans[0] = args[0] - change2;
-            ans[1] = args[0] + change2;
+            ans[0] = args[0] - change3;
+            ans[1] = args[0] + change3;
             return ans;
           },
           significant: function significant(pvalue, alpha) {
@@ -20208,6 +20208,404 @@ var fitgap_config_schema_default = {
   }
 };
 
+// src/analysis/levers/vocabulary.ts
+var words = (list) => list.split(/\s+/).filter((w) => w !== "");
+var SKLEARN = "scikit-learn";
+var COMMON = "common practice";
+var VOCABULARY = [
+  // Regularization: higher = stronger.
+  {
+    names: words("alpha"),
+    role: "regularization",
+    inverse: false,
+    domain: "non-negative",
+    scale: "log",
+    source: `${SKLEARN} Ridge, Lasso, ElasticNet, SGDClassifier, MLPClassifier (alpha); XGBoost alpha (L1)`,
+    caveat: "some texts and optimisers use alpha for a learning rate or a smoothing constant"
+  },
+  {
+    names: words(
+      "lambda reg_lambda lambda_l2 l2 l2_penalty l2_reg l2_regularization l2_leaf_reg ridge_alpha"
+    ),
+    role: "regularization",
+    inverse: false,
+    domain: "non-negative",
+    scale: "log",
+    source: `${SKLEARN} HistGradientBoosting (l2_regularization); XGBoost, LightGBM, CatBoost L2 terms; ${COMMON} (lambda)`
+  },
+  {
+    names: words("reg_alpha lambda_l1 l1 l1_penalty l1_reg"),
+    role: "regularization",
+    inverse: false,
+    domain: "non-negative",
+    scale: "log",
+    source: `XGBoost, LightGBM L1 terms; ${COMMON}`
+  },
+  {
+    names: words("reg regularization reg_strength regularization_strength penalty_strength"),
+    role: "regularization",
+    inverse: false,
+    domain: "non-negative",
+    scale: "log",
+    source: COMMON
+  },
+  {
+    names: words("weight_decay"),
+    role: "regularization",
+    inverse: false,
+    domain: "non-negative",
+    scale: "log",
+    source: `${COMMON} (PyTorch and Keras optimisers)`
+  },
+  {
+    names: words("ccp_alpha min_impurity_decrease"),
+    role: "regularization",
+    inverse: false,
+    domain: "non-negative",
+    scale: "log",
+    source: `${SKLEARN} decision trees and forests (pruning and split thresholds)`
+  },
+  {
+    names: words(
+      "min_child_weight min_sum_hessian_in_leaf min_split_loss min_split_gain min_gain_to_split"
+    ),
+    role: "regularization",
+    inverse: false,
+    domain: "non-negative",
+    scale: "log",
+    source: `XGBoost, LightGBM ("larger is more conservative"); ${COMMON}`
+  },
+  {
+    names: words("min_samples_leaf min_samples_split"),
+    role: "regularization",
+    inverse: false,
+    domain: "count-or-fraction",
+    scale: "linear",
+    source: `${SKLEARN} decision trees, forests, gradient boosting`
+  },
+  {
+    names: words("min_child_samples min_data_in_leaf"),
+    role: "regularization",
+    inverse: false,
+    domain: "count",
+    scale: "linear",
+    source: `LightGBM; ${COMMON}`
+  },
+  {
+    names: words("dropout dropout_rate label_smoothing"),
+    role: "regularization",
+    inverse: false,
+    domain: "fraction",
+    scale: "linear",
+    source: COMMON
+  },
+  // Inverse regularization: lower = stronger.
+  {
+    names: words("C"),
+    role: "regularization",
+    inverse: true,
+    domain: "positive",
+    scale: "log",
+    source: `${SKLEARN} LogisticRegression, SVC, LinearSVC: "Inverse of regularization strength"`
+  },
+  {
+    names: words(
+      "subsample bagging_fraction colsample_bytree colsample_bylevel colsample_bynode feature_fraction"
+    ),
+    role: "regularization",
+    inverse: true,
+    domain: "fraction",
+    scale: "linear",
+    source: `${SKLEARN} GradientBoosting (subsample < 1 "leads to a reduction of variance"); XGBoost, LightGBM row and column sampling`
+  },
+  // Capacity: higher = more.
+  {
+    names: words("max_depth max_leaves"),
+    role: "capacity",
+    inverse: false,
+    domain: "count",
+    scale: "linear",
+    unlimited: "null-or-non-positive",
+    source: `${SKLEARN} trees (None = unlimited); XGBoost, LightGBM (0 or below = no limit)`
+  },
+  {
+    names: words("max_leaf_nodes"),
+    role: "capacity",
+    inverse: false,
+    domain: "count",
+    scale: "linear",
+    unlimited: "null",
+    source: `${SKLEARN} trees, HistGradientBoosting (None = unlimited)`
+  },
+  {
+    names: words("num_leaves depth"),
+    role: "capacity",
+    inverse: false,
+    domain: "count",
+    scale: "linear",
+    source: `LightGBM (num_leaves), CatBoost (depth); ${COMMON}`
+  },
+  {
+    names: words("n_estimators num_boost_round num_iterations num_round nrounds"),
+    role: "capacity",
+    inverse: false,
+    domain: "count",
+    scale: "linear",
+    source: `${SKLEARN} GradientBoosting (boosting stages); XGBoost, LightGBM rounds; ${COMMON}`,
+    caveat: "in bagging ensembles (random forests) more trees mostly average variance away and do not overfit: map it as inert there"
+  },
+  {
+    names: words("hidden_layer_sizes layer_sizes"),
+    role: "capacity",
+    inverse: false,
+    domain: "units",
+    scale: "linear",
+    source: `${SKLEARN} MLPClassifier, MLPRegressor ("number of neurons in the ith hidden layer")`,
+    caveat: "an array is compared by its total units, a single number as one layer of that many units (scikit-learn accepts both)"
+  },
+  {
+    names: words(
+      "n_layers num_layers layers hidden_layers hidden_units hidden_size hidden_dim units n_units num_units width d_model model_size params parameters n_params num_params"
+    ),
+    role: "capacity",
+    inverse: false,
+    domain: "count",
+    scale: "linear",
+    source: COMMON
+  },
+  {
+    names: words("n_neighbors"),
+    role: "capacity",
+    inverse: true,
+    domain: "count",
+    scale: "linear",
+    source: `${SKLEARN} KNeighbors*; ${COMMON} (more neighbours = a smoother fit)`
+  },
+  // Features and polynomial degree.
+  {
+    names: words("features n_features num_features feature_count"),
+    role: "features",
+    inverse: false,
+    domain: "count",
+    scale: "linear",
+    source: COMMON
+  },
+  {
+    names: words("n_features_to_select"),
+    role: "features",
+    inverse: false,
+    domain: "count-or-fraction",
+    scale: "linear",
+    source: `${SKLEARN} RFE`
+  },
+  {
+    names: words("degree polynomial_degree poly_degree"),
+    role: "polynomial-degree",
+    inverse: false,
+    domain: "count",
+    scale: "linear",
+    source: `${SKLEARN} PolynomialFeatures, SVC (poly kernel)`
+  },
+  // Data size.
+  {
+    names: words(
+      "train_examples training_examples n_train num_train train_samples n_samples num_samples dataset_size data_size"
+    ),
+    role: "data-size",
+    inverse: false,
+    domain: "count",
+    scale: "linear",
+    source: COMMON
+  },
+  {
+    names: words("train_size"),
+    role: "data-size",
+    inverse: false,
+    domain: "count-or-fraction",
+    scale: "linear",
+    source: `${SKLEARN} train_test_split (an int is a count, a float a fraction)`
+  },
+  {
+    names: words("train_fraction"),
+    role: "data-size",
+    inverse: false,
+    domain: "fraction",
+    scale: "linear",
+    source: COMMON
+  },
+  // Training length.
+  {
+    names: words(
+      "epochs num_epochs n_epochs max_epochs steps max_steps num_steps train_steps iterations n_iter"
+    ),
+    role: "epochs",
+    inverse: false,
+    domain: "count",
+    scale: "linear",
+    source: COMMON,
+    caveat: "CatBoost's iterations counts trees (capacity); both mean more fitting. A scikit-learn Pipeline's steps is a list of estimators, compared as text"
+  },
+  {
+    names: words("max_iter"),
+    role: "epochs",
+    inverse: false,
+    domain: "count",
+    scale: "linear",
+    source: `${SKLEARN} MLP and SGD (epochs for stochastic solvers), LogisticRegression (solver iterations)`,
+    caveat: "in HistGradientBoosting it counts trees (capacity); for a convex solver that converged it changes nothing"
+  },
+  {
+    names: words("tol"),
+    role: "epochs",
+    inverse: true,
+    domain: "non-negative",
+    scale: "log",
+    source: `${SKLEARN} solvers ("tolerance for stopping criteria"); ${COMMON} (a smaller tolerance trains longer)`
+  },
+  {
+    names: words(
+      "patience early_stopping_patience early_stopping_rounds early_stopping_round n_iter_no_change stopping_rounds"
+    ),
+    role: "early-stopping-patience",
+    inverse: false,
+    domain: "count",
+    scale: "linear",
+    source: `${SKLEARN} SGD, MLP, GradientBoosting (n_iter_no_change); XGBoost, LightGBM, Keras; ${COMMON}`
+  },
+  // Step size.
+  {
+    names: words("learning_rate learning_rate_init lr eta base_lr max_lr"),
+    role: "learning-rate",
+    inverse: false,
+    domain: "positive",
+    scale: "log",
+    source: `${SKLEARN} GradientBoosting, HistGradientBoosting (shrinkage), MLP (learning_rate_init); XGBoost eta`,
+    caveat: "scikit-learn MLP's learning_rate is a schedule name, compared as text"
+  },
+  // Known and not a bias/variance knob.
+  {
+    names: words("random_state seed random_seed n_jobs nthread num_threads verbose verbosity"),
+    role: "inert",
+    inverse: false,
+    domain: "count",
+    scale: "linear",
+    source: COMMON
+  }
+];
+var AMBIGUOUS = [
+  {
+    names: words("gamma"),
+    readings: [
+      "scikit-learn SVC: RBF kernel coefficient, higher = more capacity",
+      "XGBoost: minimum split loss, higher = stronger regularization"
+    ],
+    source: `${SKLEARN} SVC; XGBoost`
+  },
+  {
+    names: words("max_features"),
+    readings: [
+      "scikit-learn trees and forests: features sampled per split, lower = stronger regularization",
+      "CountVectorizer, SelectFromModel: how many features the model gets"
+    ],
+    source: SKLEARN
+  },
+  {
+    names: words("max_samples"),
+    readings: [
+      "scikit-learn forests and bagging: bootstrap sample per tree, lower = more randomisation",
+      "not the size of the training set"
+    ],
+    source: SKLEARN
+  },
+  {
+    names: words("n_components"),
+    readings: ["PCA: features kept", "GaussianMixture: mixture components (capacity)"],
+    source: SKLEARN
+  },
+  {
+    names: words("rate decay"),
+    readings: ["dropout rate or weight decay (regularization)", "learning rate or its decay"],
+    source: COMMON
+  },
+  {
+    names: words("epsilon eps"),
+    readings: ["SVR: tube width, higher = less capacity", "optimisers: a numerical constant"],
+    source: COMMON
+  }
+];
+
+// src/analysis/levers/resolve-knob.ts
+function normaliseName(name) {
+  return name.replace(/([a-z0-9])([A-Z])/g, "$1_$2").toLowerCase().replace(/-/g, "_");
+}
+function lastSegment(normalised) {
+  const parts = normalised.split(/\.|\/|__/).filter((p) => p !== "");
+  const last = parts[parts.length - 1];
+  return parts.length > 1 && last !== void 0 ? last : null;
+}
+function specOf(group) {
+  return {
+    role: group.role,
+    inverse: group.inverse,
+    domain: group.domain,
+    scale: group.scale,
+    ...group.unlimited === void 0 ? {} : { unlimited: group.unlimited }
+  };
+}
+function builtInVocabulary() {
+  const map = /* @__PURE__ */ new Map();
+  for (const group of VOCABULARY)
+    for (const name of group.names)
+      map.set(normaliseName(name), { kind: "knob", origin: "built-in", spec: specOf(group) });
+  for (const group of AMBIGUOUS)
+    for (const name of group.names)
+      map.set(normaliseName(name), { kind: "ambiguous", readings: group.readings });
+  return map;
+}
+var BUILT_IN_VOCABULARY = builtInVocabulary();
+var COUNT_ROLES = /* @__PURE__ */ new Set([
+  "capacity",
+  "features",
+  "polynomial-degree",
+  "data-size",
+  "epochs",
+  "early-stopping-patience"
+]);
+function specFromConfig(entry) {
+  const integer = entry.integer ?? COUNT_ROLES.has(entry.role);
+  return {
+    role: entry.role,
+    inverse: entry.inverse ?? false,
+    domain: integer ? "count" : "non-negative",
+    scale: entry.scale ?? (integer ? "linear" : "log")
+  };
+}
+function configRoleConflicts(config) {
+  const groups2 = /* @__PURE__ */ new Map();
+  for (const key of Object.keys(config)) {
+    const n = normaliseName(key);
+    groups2.set(n, [...groups2.get(n) ?? [], key]);
+  }
+  return [...groups2.values()].filter((g) => g.length > 1);
+}
+function mergeRoles(base, config) {
+  if (config === void 0) return base;
+  const map = new Map(base);
+  for (const [key, entry] of Object.entries(config))
+    map.set(normaliseName(key), { kind: "knob", origin: "config", spec: specFromConfig(entry) });
+  return map;
+}
+function resolveKnob(name, vocabulary = BUILT_IN_VOCABULARY) {
+  const whole = normaliseName(name);
+  for (const candidate of [whole, lastSegment(whole)]) {
+    if (candidate === null) continue;
+    const item = vocabulary.get(candidate);
+    if (item === void 0) continue;
+    return item.kind === "knob" ? { status: item.origin, matched: candidate, spec: item.spec } : { status: "ambiguous", matched: candidate, readings: item.readings };
+  }
+  return { status: "unknown" };
+}
+
 // src/model/settings.ts
 var FAIL_ON_VALUES = [
   "worse-validation",
@@ -20250,6 +20648,19 @@ function failOnIssues(values, file, pointer) {
     ]
   );
 }
+function roleConflictIssues(map, file) {
+  if (map === void 0) return [];
+  return configRoleConflicts(map).map((group) => ({
+    file,
+    pointer: `/hyperparameters/${escapePointer(group[group.length - 1] ?? "")}`,
+    expected: `one entry per hyperparameter name (names match up to case, '-' and '_')`,
+    got: group.map(quote).join(", "),
+    hint: "Keep one of these entries."
+  }));
+}
+function escapePointer(key) {
+  return key.replace(/~/g, "~0").replace(/\//g, "~1");
+}
 function parseConfig(text2, file) {
   const document = (0, import_yaml.parseDocument)(text2, { prettyErrors: true });
   if (document.errors.length > 0) {
@@ -20275,7 +20686,10 @@ function parseConfig(text2, file) {
       }))
     );
   }
-  const issues = failOnIssues(data["fail-on"] ?? [], file, "/fail-on");
+  const issues = [
+    ...failOnIssues(data["fail-on"] ?? [], file, "/fail-on"),
+    ...roleConflictIssues(data.hyperparameters, file)
+  ];
   if (issues.length > 0) throw new InputError(issues);
   return data;
 }
@@ -20593,10 +21007,10 @@ function shortfallSign(run) {
 function splitMeasure(split) {
   return { terms: [{ split, weight: 1 }], constant: 0 };
 }
-function perRepeat(run, measure) {
+function perRepeat(run, measure2) {
   const sign = shortfallSign(run);
   const columns = [];
-  for (const term of measure.terms) {
+  for (const term of measure2.terms) {
     const split = run.splits[term.split];
     if (split === void 0) return null;
     columns.push({ values: split.values, weight: term.weight });
@@ -20604,16 +21018,16 @@ function perRepeat(run, measure) {
   const repeats = run.splits.train.values.length;
   const out = [];
   for (let i = 0; i < repeats; i++) {
-    let total = measure.constant;
+    let total = measure2.constant;
     for (const column of columns) total += column.weight * sign * (column.values[i] ?? Number.NaN);
     out.push(total);
   }
   return out;
 }
-function binomialMeasureVariance(run, measure) {
+function binomialMeasureVariance(run, measure2) {
   if (run.metric.kind !== "proportion") return null;
   let total = 0;
-  for (const term of measure.terms) {
+  for (const term of measure2.terms) {
     const split = run.splits[term.split];
     if (split?.examples === void 0) return null;
     const repeats = split.values.length;
@@ -20644,26 +21058,26 @@ function deltaFields(result, settings) {
     call: callOf(result, settings)
   };
 }
-function measureChange(baseline, candidate, measure, alpha) {
-  const b = perRepeat(baseline, measure.baseline);
-  const c = perRepeat(candidate, measure.candidate);
+function measureChange(baseline, candidate, measure2, alpha) {
+  const b = perRepeat(baseline, measure2.baseline);
+  const c = perRepeat(candidate, measure2.candidate);
   if (b === null || c === null) return null;
   const estimate = mean(c) - mean(b);
   if (b.length >= 2 && c.length >= 2) return welchT(b, c, alpha);
-  const vb = binomialMeasureVariance(baseline, measure.baseline);
-  const vc = binomialMeasureVariance(candidate, measure.candidate);
+  const vb = binomialMeasureVariance(baseline, measure2.baseline);
+  const vc = binomialMeasureVariance(candidate, measure2.candidate);
   if (vb !== null && vc !== null) return normalTest(estimate, vb + vc, alpha, "z-binomial");
   return { estimate, ci: null, p: null, test: "none" };
 }
-function measureLevel(run, measure, alpha) {
-  const values = perRepeat(run, measure);
+function measureLevel(run, measure2, alpha) {
+  const values = perRepeat(run, measure2);
   if (values === null) return null;
   const value2 = mean(values);
   if (values.length >= 2) {
     const t = oneSampleT(values, alpha);
     return { value: value2, ci: t.ci, p: t.pGreater };
   }
-  const variance = binomialMeasureVariance(run, measure);
+  const variance = binomialMeasureVariance(run, measure2);
   if (variance !== null) {
     const z = normalTest(value2, variance, alpha, "z-binomial");
     const p = variance > 0 ? 1 - normalCdf(value2 / Math.sqrt(variance)) : value2 > 0 ? 0 : 1;
@@ -20731,8 +21145,8 @@ function decompose(run, reference, settings) {
   const threshold = Math.max(settings.gapTolerance * errorLevel(run), settings.minEffect);
   const out = {};
   for (const name of ["bias", "variance", "mismatch", "overfit"]) {
-    const measure = measures[name];
-    const level = measure === null ? null : measureLevel(run, measure, settings.alpha);
+    const measure2 = measures[name];
+    const level = measure2 === null ? null : measureLevel(run, measure2, settings.alpha);
     if (level === null) {
       const unavailable = UNAVAILABLE.get(name);
       if (unavailable === void 0) throw new Error(`${name} needs splits every run has`);
@@ -20762,8 +21176,8 @@ function diagnose(components) {
 }
 
 // src/analysis/changes.ts
-function both(measure) {
-  return { baseline: measure, candidate: measure };
+function both(measure2) {
+  return { baseline: measure2, candidate: measure2 };
 }
 function pairedTest(paired, run, alpha) {
   if (paired.rows === 0) return null;
@@ -20827,7 +21241,7 @@ function componentChanges(runs, references, calls) {
     },
     alpha
   );
-  const change2 = (name) => {
+  const change3 = (name) => {
     const mb = componentMeasures(baseline, refB)[name];
     const mc = componentMeasures(candidate, refC)[name];
     if (mb === null || mc === null) return null;
@@ -20835,26 +21249,26 @@ function componentChanges(runs, references, calls) {
     return r === null ? null : toShortfallDelta(r, calls);
   };
   const varianceFallback = baseline.splits.train_dev === void 0 !== (candidate.splits.train_dev === void 0);
-  const variance = varianceFallback ? validationMinusTrain(runs, calls) : change2("variance");
+  const variance = varianceFallback ? validationMinusTrain(runs, calls) : change3("variance");
   if (variance === null)
     throw new Error("variance needs train and validation, which the schema requires");
   return {
     bias: bias === null ? null : toShortfallDelta(bias, calls),
     variance,
-    mismatch: change2("mismatch"),
-    overfit: change2("overfit"),
+    mismatch: change3("mismatch"),
+    overfit: change3("overfit"),
     varianceFallback
   };
 }
 function validationMinusTrain(runs, calls) {
-  const measure = {
+  const measure2 = {
     terms: [
       { split: "validation", weight: 1 },
       { split: "train", weight: -1 }
     ],
     constant: 0
   };
-  const r = measureChange(runs.baseline, runs.candidate, both(measure), calls.alpha);
+  const r = measureChange(runs.baseline, runs.candidate, both(measure2), calls.alpha);
   return r === null ? null : toShortfallDelta(r, calls);
 }
 
@@ -20908,61 +21322,101 @@ function applyGate(review, failOn) {
   return { pass: reasons.length === 0, reasons, failOn: [...failOn] };
 }
 
-// src/analysis/hyperparameters.ts
-function diffHyperparameters(baseline = {}, candidate = {}) {
-  const keys = [.../* @__PURE__ */ new Set([...Object.keys(baseline), ...Object.keys(candidate)])].sort();
-  const out = [];
-  for (const key of keys) {
-    const inB = Object.hasOwn(baseline, key);
-    const inC = Object.hasOwn(candidate, key);
-    const b = baseline[key];
-    const c = candidate[key];
-    if (!inB) out.push({ key, baseline: null, candidate: c, kind: "added" });
-    else if (!inC) out.push({ key, baseline: b, candidate: null, kind: "removed" });
-    else if (typeof b === "number" && typeof c === "number") {
-      if (c > b) out.push({ key, baseline: b, candidate: c, kind: "raised" });
-      else if (c < b) out.push({ key, baseline: b, candidate: c, kind: "lowered" });
-    } else if (JSON.stringify(b) !== JSON.stringify(c))
-      out.push({ key, baseline: b, candidate: c, kind: "changed" });
-  }
-  return out;
+// src/analysis/levers/rounding.ts
+var SUGGESTION_DIGITS = 2;
+var MAX_DIGITS = 17;
+function toSignificant(x, digits2) {
+  if (x === 0 || !Number.isFinite(x)) return x;
+  return Number(x.toPrecision(digits2));
 }
-var KNOBS = [
-  [
-    /^(lambda|l2|l2_penalty|weight_decay|reg(ularization)?(_strength)?|ridge_alpha|dropout)$/i,
-    "regularization"
-  ],
-  [/^(features|num_features|n_features|feature_count)$/i, "features"],
-  [/^(polynomial_degree|poly_degree|degree|interaction_terms)$/i, "feature-richness"],
-  [/^(train_examples|training_examples|n_train|train_size|num_train)$/i, "data"],
-  [/^(epochs|max_epochs|num_epochs|iterations|max_iter|steps)$/i, "epochs"],
-  [
-    /^(hidden_units|hidden_size|layers|num_layers|depth|max_depth|width|params|parameters|model_size|n_estimators)$/i,
-    "model-size"
-  ]
-];
-function knobOf(key) {
-  for (const [pattern, knob] of KNOBS) if (pattern.test(key)) return knob;
+function decade(v) {
+  const a = Math.abs(v);
+  let e = Math.floor(Math.log10(a));
+  if (scaled(1, e) > a) e -= 1;
+  else if (scaled(1, e + 1) <= a) e += 1;
+  return e;
+}
+function scaled(k, e) {
+  return Number(`${k}e${e}`);
+}
+function outward(v, digits2, integer, up) {
+  if (v === 0) return 0;
+  if (v < 0) return -outward(-v, digits2, integer, !up);
+  const e = integer ? Math.max(decade(v) - digits2 + 1, 0) : decade(v) - digits2 + 1;
+  let q = v / scaled(1, e);
+  const near = Math.round(q);
+  if (Math.abs(q - near) <= 1e-9 * Math.max(1, q)) q = near;
+  let k = up ? Math.ceil(q) : Math.floor(q);
+  let r = scaled(k, e);
+  if (up ? r < v : r > v) {
+    k += up ? 1 : -1;
+    r = scaled(k, e);
+  }
+  return r;
+}
+function nearest(x, digits2, integer) {
+  if (!integer) return toSignificant(x, digits2);
+  return Math.abs(x) < 10 ** digits2 ? Math.round(x) : toSignificant(x, digits2);
+}
+function inside(v, lo, hi) {
+  return v >= lo && v <= hi;
+}
+function fewestDigits(x, lo, hi, integer) {
+  for (let d = SUGGESTION_DIGITS; d <= MAX_DIGITS; d++) {
+    const r = nearest(x, d, integer);
+    if (inside(r, lo, hi)) return r;
+    const edge = r < lo ? outward(lo, d, integer, true) : outward(hi, d, integer, false);
+    if (inside(edge, lo, hi)) return edge;
+  }
   return null;
 }
-var PULLED = {
-  regularization: { raised: "stronger-regularization", lowered: "weaker-regularization" },
-  features: { raised: "more-features", lowered: "fewer-features" },
-  "feature-richness": { raised: "richer-features", lowered: "fewer-features" },
-  data: { raised: "more-data", lowered: "more-data" },
-  epochs: { raised: "train-longer", lowered: "early-stopping" },
-  "model-size": { raised: "bigger-model", lowered: "smaller-model" }
-};
-function pulledLevers(changes) {
-  const out = [];
-  for (const change2 of changes) {
-    if (change2.kind !== "raised" && change2.kind !== "lowered") continue;
-    const knob = knobOf(change2.key);
-    if (knob === null) continue;
-    if (knob === "data" && change2.kind === "lowered") continue;
-    out.push({ lever: PULLED[knob][change2.kind], change: change2, knob });
+function roundSuggestion(x, options = {}) {
+  if (!Number.isFinite(x)) throw new RangeError(`cannot round ${String(x)}: not a finite number`);
+  const integer = options.integer ?? false;
+  const [a, b] = options.range ?? [-Infinity, Infinity];
+  if (Number.isNaN(a) || Number.isNaN(b))
+    throw new RangeError("cannot round into a range with NaN");
+  const lo = Math.min(a, b);
+  const hi = Math.max(a, b);
+  const x0 = Math.min(hi, Math.max(lo, x));
+  const grid = (options.grid ?? []).filter(
+    (g) => Number.isFinite(g) && inside(g, lo, hi) && (!integer || Number.isInteger(g))
+  );
+  if (grid.includes(x0)) return x0;
+  const v = fewestDigits(x0, lo, hi, integer) ?? Math.round(x0);
+  const key = toSignificant(v, SUGGESTION_DIGITS);
+  let snapped = null;
+  for (const g of grid)
+    if (toSignificant(g, SUGGESTION_DIGITS) === key && (snapped === null || Math.abs(g - x0) < Math.abs(snapped - x0)))
+      snapped = g;
+  return snapped ?? v;
+}
+function midpoint(a, b, scale) {
+  if (scale === "log" && a > 0 && b > 0) return Math.sqrt(a) * Math.sqrt(b);
+  return a / 2 + b / 2;
+}
+function between(a, b, options) {
+  const lo = Math.min(a, b);
+  const hi = Math.max(a, b);
+  const inset = (hi - lo) * 1e-9;
+  if (!(inset > 0)) return null;
+  const v = roundSuggestion(midpoint(lo, hi, options.scale), {
+    integer: options.integer,
+    range: [lo + inset, hi - inset],
+    ...options.grid === void 0 ? {} : { grid: options.grid }
+  });
+  return v > lo && v < hi ? v : null;
+}
+function isIntegerKnob(spec, values) {
+  switch (spec.domain) {
+    case "count":
+    case "units":
+      return true;
+    case "count-or-fraction":
+      return values.every((v) => v >= 1);
+    default:
+      return false;
   }
-  return out;
 }
 
 // src/analysis/levers/context.ts
@@ -20989,13 +21443,49 @@ var Drafts = class {
   has(id) {
     return this.#byId.has(id);
   }
+  get(id) {
+    return this.#byId.get(id);
+  }
+  delete(id) {
+    this.#byId.delete(id);
+  }
   /** Highest score first; drafts with equal scores keep the order they were first drafted in. */
   ranked() {
     return [...this.#byId.values()].sort((a, b) => b.score - a.score);
   }
 };
-function between(from, to) {
-  return from > 0 && to > 0 ? Math.sqrt(from * to) : (from + to) / 2;
+function sweepWants(sweep, knob) {
+  if (sweep.side === "unknown") return null;
+  if (sweep.side === "at") return "at";
+  const below = sweep.side === "below";
+  return below !== (knob?.inverse ?? false) ? "stronger" : "weaker";
+}
+function sweepSuggestion(sweep, knob, wants) {
+  const grid = sweep.chart.map((p) => p.x).filter((x) => Number.isFinite(x));
+  const lo = Math.min(...grid);
+  const hi = Math.max(...grid);
+  const value2 = sweep.atEdge === null && grid.length > 0 ? roundSuggestion(sweep.bestX, { grid, range: [lo, hi] }) : roundSuggestion(sweep.suggestedX);
+  const up = wants === "stronger" !== knob.inverse;
+  if (up ? !(value2 > knob.value) : !(value2 < knob.value)) return void 0;
+  return {
+    hyperparameter: knob.key,
+    value: value2,
+    basis: sweep.atEdge === null ? "sweep-minimum" : "beyond-sweep-edge"
+  };
+}
+function sweepEvidence(sweep, knob, lever) {
+  const wants = sweepWants(sweep, knob);
+  return {
+    kind: "sweep-minimum",
+    hyperparameter: knob?.key ?? null,
+    bestX: sweep.bestX,
+    bestValidation: sweep.bestValidation,
+    current: knob?.value ?? null,
+    suggestedX: sweep.suggestedX,
+    side: sweep.side,
+    supports: wants === null ? null : wants === lever,
+    atEdge: sweep.atEdge
+  };
 }
 function savedByStopping(e, goal) {
   const sign = goal === "minimize" ? 1 : -1;
@@ -21029,6 +21519,71 @@ var BY_TARGET = {
   ]
 };
 
+// src/analysis/levers/knobs.ts
+var WRITER_KEYS = ["inverse_knobs", "curve_knobs"];
+function isRecord(v) {
+  return typeof v === "object" && v !== null && !Array.isArray(v);
+}
+function knobValues(h) {
+  const out = {};
+  for (const [key, value2] of Object.entries(h ?? {}))
+    if (!WRITER_KEYS.includes(key))
+      Object.defineProperty(out, key, {
+        value: value2,
+        enumerable: true,
+        writable: true,
+        configurable: true
+      });
+  return out;
+}
+function runVocabulary(base, ...runs) {
+  const names2 = runs.flatMap((h) => {
+    const list = h?.["inverse_knobs"];
+    return Array.isArray(list) ? list.filter((x) => typeof x === "string") : [];
+  });
+  if (names2.length === 0) return base;
+  const map = new Map(base);
+  for (const name of names2) {
+    const r = resolveKnob(name, base);
+    const spec = r.status === "built-in" || r.status === "config" ? { ...r.spec, inverse: true } : { role: "regularization", inverse: true, domain: "positive", scale: "log" };
+    map.set(normaliseName(name), { kind: "knob", origin: "built-in", spec });
+  }
+  return map;
+}
+function regularizationKnob(h, vocabulary) {
+  const params = knobValues(h);
+  const curveKnobs = h?.["curve_knobs"];
+  const named = isRecord(curveKnobs) ? curveKnobs["regularization"] : void 0;
+  const of = (key) => {
+    const value2 = params[key];
+    if (typeof value2 !== "number" || !Number.isFinite(value2)) return void 0;
+    const r = resolveKnob(key, vocabulary);
+    const inverse = (r.status === "built-in" || r.status === "config") && r.spec.inverse;
+    return { key, value: value2, inverse };
+  };
+  if (typeof named === "string" && Object.hasOwn(params, named)) return of(named);
+  for (const key of Object.keys(params)) {
+    const r = resolveKnob(key, vocabulary);
+    if (r.status !== "built-in" && r.status !== "config") continue;
+    if (r.spec.role !== "regularization" || r.spec.domain === "fraction") continue;
+    const knob = of(key);
+    if (knob !== void 0) return knob;
+  }
+  return void 0;
+}
+function runRoles(h, vocabulary) {
+  const roles = /* @__PURE__ */ new Set();
+  for (const key of Object.keys(knobValues(h))) {
+    const r = resolveKnob(key, vocabulary);
+    if (r.status === "built-in" || r.status === "config") roles.add(r.spec.role);
+  }
+  return roles;
+}
+function specOf2(key, vocabulary) {
+  const r = resolveKnob(key, vocabulary);
+  return r.status === "built-in" || r.status === "config" ? r.spec : null;
+}
+
 // src/analysis/levers/scores.ts
 var REVERSE_OWN_CHANGE = 100;
 var COUNTER_WITH_SWEEP = 95;
@@ -21039,6 +21594,7 @@ var SECOND_TARGET_STEP = 20;
 var CATALOGUE_STEP = 2;
 var GAP_CLOSING_BONUS = 8;
 var GAP_FLAT_PENALTY = 25;
+var PROJECTION_INCLUDES_TODAY_PENALTY = 25;
 var SWEEP_AGREES_BONUS = 10;
 var SWEEP_DISAGREES_PENALTY = 20;
 var EPOCH_CONFIRMED_BONUS = 12;
@@ -21053,87 +21609,153 @@ var SUPPLY_REFERENCE = 20;
 var ADD_REPEATS = 15;
 
 // src/analysis/levers/own-change.ts
-var CAPACITY_LEVERS = /* @__PURE__ */ new Set([
-  "richer-features",
+var UNDO = {
+  "more-regularization": "weaker-regularization",
+  "less-regularization": "stronger-regularization",
+  "more-capacity": "smaller-model",
+  "less-capacity": "bigger-model",
+  "more-features": "fewer-features",
+  "fewer-features": "more-features",
+  "higher-degree": "fewer-features",
+  "lower-degree": "richer-features",
+  "more-data": null,
+  "less-data": "more-data",
+  "longer-training": "early-stopping",
+  "shorter-training": "train-longer",
+  "later-stopping": "early-stopping",
+  "earlier-stopping": "train-longer",
+  "larger-steps": null,
+  "smaller-steps": null
+};
+var PULLS = {
+  "more-regularization": "stronger-regularization",
+  "less-regularization": "weaker-regularization",
+  "more-capacity": "bigger-model",
+  "less-capacity": "smaller-model",
+  "more-features": "more-features",
+  "fewer-features": "fewer-features",
+  "higher-degree": "richer-features",
+  "lower-degree": "fewer-features",
+  "more-data": "more-data",
+  "less-data": null,
+  "longer-training": "train-longer",
+  "shorter-training": "early-stopping",
+  "later-stopping": "train-longer",
+  "earlier-stopping": "early-stopping",
+  "larger-steps": null,
+  "smaller-steps": null
+};
+var ADDS_CAPACITY = /* @__PURE__ */ new Set([
+  "more-capacity",
   "more-features",
-  "bigger-model"
+  "higher-degree"
 ]);
-function numericChange(p) {
-  return {
-    hyperparameter: p.change.key,
-    from: Number(p.change.baseline),
-    to: Number(p.change.candidate),
-    direction: p.change.kind === "lowered" ? "lowered" : "raised"
-  };
-}
-function ownChangeLevers(ctx, curves, drafts) {
+function isSuspect(pull, ctx) {
+  if (pull === null) return false;
   const towardBias = ctx.movement === "toward-underfitting" || ctx.movement === "worse-on-both";
   const towardVariance = ctx.movement === "toward-overfitting" || ctx.movement === "worse-on-both";
-  const biasChange = {
-    kind: "component-change",
-    component: "bias",
-    delta: ctx.bias
+  if (pull === "toward-underfitting") return towardBias;
+  return towardVariance && pull !== "less-variance";
+}
+var DECIMAL = /^[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?$/;
+function num(v) {
+  if (typeof v === "number") return Number.isFinite(v) ? v : null;
+  if (typeof v === "string" && DECIMAL.test(v.trim())) return Number(v.trim());
+  return null;
+}
+function comparedValues(c) {
+  if (c.totalUnits !== void 0) return { from: c.totalUnits.from, to: c.totalUnits.to };
+  const from = c.unlimited === "from" ? null : num(c.from);
+  const to = c.unlimited === "to" ? null : num(c.to);
+  if (from === null && c.unlimited !== "from" || to === null && c.unlimited !== "to")
+    return null;
+  return { from, to };
+}
+function changeEvidence(c) {
+  const v = comparedValues(c);
+  if (v === null || c.role === null || c.effect === null) return null;
+  if (c.direction !== "raised" && c.direction !== "lowered") return null;
+  return {
+    kind: "pr-change",
+    hyperparameter: c.hyperparameter,
+    from: v.from,
+    to: v.to,
+    direction: c.direction,
+    role: c.role,
+    effect: c.effect,
+    ...c.totalUnits === void 0 ? {} : { totalUnits: true }
   };
-  const varianceChange = {
-    kind: "component-change",
-    component: "variance",
-    delta: ctx.variance
-  };
-  for (const p of ctx.pulled) {
-    const { baseline: from, candidate: to, key } = p.change;
-    if (typeof from !== "number" || typeof to !== "number") continue;
-    const change2 = { kind: "pr-change", ...numericChange(p) };
-    const midway = {
-      hyperparameter: key,
-      value: between(from, to),
-      basis: "between-old-and-new"
-    };
-    if (p.lever === "stronger-regularization" && towardBias) {
-      drafts.add("weaker-regularization", REVERSE_OWN_CHANGE, [change2, biasChange], midway);
-    }
-    if (p.lever === "weaker-regularization" && towardVariance) {
-      drafts.add("stronger-regularization", REVERSE_OWN_CHANGE, [change2, varianceChange], midway);
-    }
-    if (CAPACITY_LEVERS.has(p.lever) && towardVariance) {
-      const back = p.lever === "bigger-model" ? "smaller-model" : "fewer-features";
-      drafts.add(back, STEP_BACK_CAPACITY, [change2, varianceChange], midway);
-      counterCapacity(ctx, curves, drafts, [change2, varianceChange]);
-    }
+}
+function stepBack(c, spec) {
+  if (spec.role === "learning-rate" || spec.role === "inert") return void 0;
+  const v = comparedValues(c);
+  if (v === null) return void 0;
+  const totalUnits = c.totalUnits === void 0 ? {} : { totalUnits: true };
+  const finite = v.from ?? v.to;
+  if (finite === null) return void 0;
+  const integer = isIntegerKnob(spec, [finite]);
+  if (v.from === null || v.to === null) {
+    const value3 = roundSuggestion(Math.max(finite * 2, integer ? finite + 1 : finite), {
+      integer
+    });
+    return { hyperparameter: c.hyperparameter, value: value3, basis: "finite-limit", ...totalUnits };
   }
+  const value2 = between(v.from, v.to, {
+    scale: spec.scale,
+    integer: isIntegerKnob(spec, [v.from, v.to])
+  });
+  return value2 === null ? { hyperparameter: c.hyperparameter, value: v.from, basis: "back-to-baseline", ...totalUnits } : { hyperparameter: c.hyperparameter, value: value2, basis: "between-old-and-new", ...totalUnits };
+}
+function ownChangeLevers(ctx, curves, drafts) {
+  const counters = [];
+  const drafted = /* @__PURE__ */ new Set();
+  for (const c of ctx.changes) {
+    if (c.effect === null || !isSuspect(c.pull, ctx)) continue;
+    const id = UNDO[c.effect];
+    const spec = specOf2(c.hyperparameter, ctx.vocabulary);
+    const change3 = changeEvidence(c);
+    if (id === null || spec === null || change3 === null) continue;
+    const moved = {
+      kind: "component-change",
+      component: c.pull === "toward-underfitting" ? "bias" : "variance",
+      delta: c.pull === "toward-underfitting" ? ctx.bias : ctx.variance
+    };
+    if (ADDS_CAPACITY.has(c.effect)) counters.push([change3, moved]);
+    const existing = drafts.get(id);
+    if (existing !== void 0 && drafted.has(id)) {
+      existing.evidence.splice(1, 0, change3);
+      continue;
+    }
+    drafted.add(id);
+    let suggestion = stepBack(c, spec);
+    const evidence = [change3, moved];
+    const regularizing = id === "stronger-regularization" || id === "weaker-regularization";
+    if (regularizing && curves.sweep !== null) {
+      const lever = id === "stronger-regularization" ? "stronger" : "weaker";
+      evidence.push(sweepEvidence(curves.sweep, ctx.regularization, lever));
+      const knob = ctx.regularization;
+      if (knob !== void 0 && knob.key === c.hyperparameter && sweepWants(curves.sweep, knob) === lever)
+        suggestion = sweepSuggestion(curves.sweep, knob, lever) ?? suggestion;
+    }
+    drafts.add(id, regularizing ? REVERSE_OWN_CHANGE : STEP_BACK_CAPACITY, evidence, suggestion);
+  }
+  const first = counters[0];
+  if (first !== void 0) counterCapacity(ctx, curves, drafts, first);
 }
 function counterCapacity(ctx, curves, drafts, evidence) {
   const sweep = curves.sweep;
-  if (sweep === null || sweep.side !== "below") {
-    drafts.add("stronger-regularization", COUNTER_WITHOUT_SWEEP, evidence);
+  const knob = ctx.regularization;
+  if (sweep === null || sweepWants(sweep, knob) !== "stronger") {
+    if (ctx.roles.size === 0 || ctx.roles.has("regularization"))
+      drafts.add("stronger-regularization", COUNTER_WITHOUT_SWEEP, evidence);
     return;
   }
-  const key = ctx.regularization?.key;
   drafts.add(
     "stronger-regularization",
     COUNTER_WITH_SWEEP,
-    [
-      ...evidence,
-      {
-        kind: "sweep-minimum",
-        hyperparameter: key ?? null,
-        bestX: sweep.bestX,
-        bestValidation: sweep.bestValidation,
-        current: ctx.regularization?.value ?? null,
-        suggestedX: sweep.suggestedX,
-        side: sweep.side,
-        supports: true,
-        atEdge: sweep.atEdge
-      }
-    ],
-    key === void 0 ? void 0 : sweepSuggestion(key, sweep)
+    [...evidence, sweepEvidence(sweep, knob, "stronger")],
+    knob === void 0 ? void 0 : sweepSuggestion(sweep, knob, "stronger")
   );
-}
-function sweepSuggestion(key, sweep) {
-  return {
-    hyperparameter: key,
-    value: sweep.suggestedX,
-    basis: sweep.atEdge === null ? "sweep-minimum" : "beyond-sweep-edge"
-  };
 }
 
 // src/analysis/levers/diagnosis.ts
@@ -21152,7 +21774,15 @@ function targets(diagnosis, run) {
   }
 }
 function diagnosisLevers(ctx, curves, drafts) {
-  const pulled = new Map(ctx.pulled.map((p) => [p.lever, p]));
+  const pulled = /* @__PURE__ */ new Map();
+  for (const c of ctx.changes) {
+    const id = c.effect === null ? null : PULLS[c.effect];
+    const v = comparedValues(c);
+    if (id === null || v === null || v.from === null || v.to === null || pulled.has(id)) continue;
+    if (c.direction !== "raised" && c.direction !== "lowered") continue;
+    const { hyperparameter, direction } = c;
+    pulled.set(id, { kind: "already-pulled", hyperparameter, from: v.from, to: v.to, direction });
+  }
   targets(ctx.candidate.diagnosis, ctx.candidate).forEach((target, t) => {
     const component = ctx.candidate.components[target];
     const base = component.value === null ? [] : [
@@ -21172,7 +21802,7 @@ function diagnosisLevers(ctx, curves, drafts) {
       const p = pulled.get(id);
       if (p !== void 0) {
         draft.score -= ALREADY_PULLED_PENALTY;
-        draft.evidence.push({ kind: "already-pulled", ...numericChange(p) });
+        draft.evidence.push(p);
       }
       drafts.add(id, draft.score, draft.evidence, draft.suggestion);
     });
@@ -21183,14 +21813,18 @@ function sharpen(id, draft, ctx, curves) {
     const lc = curves.learning;
     const twice = lc.projections[0];
     if (twice !== void 0) {
+      const current = ctx.candidate.splits.find((s) => s.split === "validation")?.mean ?? 0;
+      const includesToday = twice.ci[0] <= current && current <= twice.ci[1];
+      if (includesToday) draft.score -= PROJECTION_INCLUDES_TODAY_PENALTY;
       draft.evidence.push({
         kind: "learning-curve",
         fromX: Math.max(...lc.chart.map((p) => p.x)),
         atX: twice.x,
-        current: ctx.candidate.splits.find((s) => s.split === "validation")?.mean ?? 0,
+        current,
         projected: twice.validation,
         ci: twice.ci,
-        r2: lc.r2
+        r2: lc.r2,
+        includesToday
       });
     }
     if (lc.gapTrend === "flat") {
@@ -21228,25 +21862,63 @@ function sharpen(id, draft, ctx, curves) {
   }
 }
 function sharpenBySweep(id, draft, ctx, sweep) {
-  const wants = id === "stronger-regularization" ? "below" : "above";
-  const supports = sweep.side === "unknown" ? null : sweep.side === wants;
-  if (supports === null && sweep.atEdge === null) return;
-  const key = ctx.regularization?.key;
-  draft.evidence.push({
-    kind: "sweep-minimum",
-    hyperparameter: key ?? null,
-    bestX: sweep.bestX,
-    bestValidation: sweep.bestValidation,
-    current: ctx.regularization?.value ?? null,
-    suggestedX: sweep.suggestedX,
-    side: sweep.side,
-    supports,
-    atEdge: sweep.atEdge
-  });
-  if (supports === true) {
+  const lever = id === "stronger-regularization" ? "stronger" : "weaker";
+  const wants = sweepWants(sweep, ctx.regularization);
+  if (wants === null && sweep.atEdge === null) return;
+  draft.evidence.push(sweepEvidence(sweep, ctx.regularization, lever));
+  if (wants === lever) {
     draft.score += SWEEP_AGREES_BONUS;
-    if (key !== void 0) draft.suggestion = sweepSuggestion(key, sweep);
-  } else if (supports === false) draft.score -= SWEEP_DISAGREES_PENALTY;
+    const knob = ctx.regularization;
+    const suggestion = knob === void 0 ? void 0 : sweepSuggestion(sweep, knob, lever);
+    if (suggestion !== void 0) draft.suggestion = suggestion;
+  } else if (wants !== null) draft.score -= SWEEP_DISAGREES_PENALTY;
+}
+
+// src/analysis/levers/resolve.ts
+var OPPOSITES = [
+  ["stronger-regularization", "weaker-regularization"],
+  ["bigger-model", "smaller-model"],
+  ["train-longer", "early-stopping"],
+  ["more-features", "fewer-features"],
+  ["richer-features", "fewer-features"]
+];
+var NEEDS = {
+  "bigger-model": ["capacity"],
+  "smaller-model": ["capacity"],
+  "more-features": ["features", "polynomial-degree"],
+  "fewer-features": ["features", "polynomial-degree"],
+  "richer-features": ["features", "polynomial-degree"],
+  "weaker-regularization": ["regularization"],
+  "train-longer": ["epochs", "early-stopping-patience"],
+  "early-stopping": ["epochs", "early-stopping-patience"]
+};
+function ruledOut(lever, roles) {
+  const own = lever.evidence.some((e) => e.kind === "pr-change");
+  for (const e of lever.evidence) {
+    if (e.kind === "sweep-minimum" && e.supports === false) return true;
+    if (e.kind === "epoch-curve-silent" && e.curve) return true;
+  }
+  const measured = lever.evidence.some(
+    (e) => e.kind === "sweep-minimum" || e.kind === "epoch-minimum" || e.kind === "still-improving"
+  );
+  const needs = NEEDS[lever.id];
+  if (own || measured || needs === void 0 || roles.size === 0) return false;
+  return !needs.some((r) => roles.has(r));
+}
+function resolveLevers(drafted, roles, tieBreak = () => 0) {
+  const ranked = [...drafted].sort((a, b) => b.score - a.score || tieBreak(a, b));
+  const kept = [];
+  const taken = /* @__PURE__ */ new Set();
+  for (const lever of ranked) {
+    if (ruledOut(lever, roles)) continue;
+    const opposite = OPPOSITES.some(
+      ([a, b]) => a === lever.id && taken.has(b) || b === lever.id && taken.has(a)
+    );
+    if (opposite) continue;
+    kept.push(lever);
+    taken.add(lever.id);
+  }
+  return kept;
 }
 
 // src/analysis/levers/secondary.ts
@@ -21296,18 +21968,177 @@ function secondaryLevers(ctx, curves, drafts) {
 }
 
 // src/analysis/levers/choose.ts
-function chooseLevers(ctx) {
+function chooseLevers(ctx, tieBreak) {
   const curves = curveEvidence(ctx.candidate.curves);
   const drafts = new Drafts();
   ownChangeLevers(ctx, curves, drafts);
   diagnosisLevers(ctx, curves, drafts);
   secondaryLevers(ctx, curves, drafts);
-  return { levers: drafts.ranked(), nonLevers: nonLevers(ctx) };
+  return { levers: resolveLevers(drafts.ranked(), ctx.roles, tieBreak), nonLevers: nonLevers(ctx) };
 }
 function nonLevers(ctx) {
   const biased = ctx.candidate.diagnosis === "high-bias" || ctx.candidate.diagnosis === "high-bias-and-variance";
-  const shrank = ctx.changes.some((c) => c.kind === "lowered" && knobOf(c.key) === "data");
+  const shrank = ctx.changes.some((c) => c.effect === "less-data");
   return biased || shrank ? ["smaller-training-set"] : [];
+}
+
+// src/analysis/levers/pr-changes.ts
+var MAX_DEPTH = 8;
+var EFFECTS = {
+  regularization: ["more-regularization", "less-regularization"],
+  capacity: ["more-capacity", "less-capacity"],
+  features: ["more-features", "fewer-features"],
+  "polynomial-degree": ["higher-degree", "lower-degree"],
+  "data-size": ["more-data", "less-data"],
+  epochs: ["longer-training", "shorter-training"],
+  "early-stopping-patience": ["later-stopping", "earlier-stopping"],
+  "learning-rate": ["larger-steps", "smaller-steps"]
+};
+function effectOf(role, inverse, direction) {
+  if (role === null || role === "inert") return null;
+  if (direction !== "raised" && direction !== "lowered") return null;
+  const [up, down] = EFFECTS[role];
+  return direction === "raised" !== inverse ? up : down;
+}
+var PULLS2 = {
+  "more-regularization": "toward-underfitting",
+  "less-regularization": "toward-overfitting",
+  "more-capacity": "toward-overfitting",
+  "less-capacity": "toward-underfitting",
+  "more-features": "toward-overfitting",
+  "fewer-features": "toward-underfitting",
+  "higher-degree": "toward-overfitting",
+  "lower-degree": "toward-underfitting",
+  "more-data": "less-variance",
+  "less-data": "more-variance",
+  "longer-training": "toward-overfitting",
+  "shorter-training": "toward-underfitting",
+  "later-stopping": "toward-overfitting",
+  "earlier-stopping": "toward-underfitting",
+  "larger-steps": null,
+  "smaller-steps": null
+};
+function pullOf(effect) {
+  return effect === null ? null : PULLS2[effect];
+}
+function isPlainObject(v) {
+  return typeof v === "object" && v !== null && !Array.isArray(v);
+}
+function toJson(v) {
+  if (v === null || typeof v === "boolean" || typeof v === "string") return v;
+  if (typeof v === "number") return Number.isFinite(v) ? v : null;
+  if (Array.isArray(v)) return v.map(toJson);
+  if (isPlainObject(v)) {
+    const out = {};
+    for (const [k, x] of Object.entries(v))
+      Object.defineProperty(out, k, {
+        value: toJson(x),
+        enumerable: true,
+        writable: true,
+        configurable: true
+      });
+    return out;
+  }
+  return null;
+}
+function flatten(params) {
+  const nested = /* @__PURE__ */ new Map();
+  const walk = (obj, prefix, depth) => {
+    for (const [key, value2] of Object.entries(obj)) {
+      const path = `${prefix}.${key}`;
+      if (isPlainObject(value2) && depth < MAX_DEPTH && Object.keys(value2).length > 0)
+        walk(value2, path, depth + 1);
+      else nested.set(path, value2);
+    }
+  };
+  const literal = /* @__PURE__ */ new Map();
+  for (const [key, value2] of Object.entries(params)) {
+    if (isPlainObject(value2) && Object.keys(value2).length > 0) walk(value2, key, 1);
+    else literal.set(key, value2);
+  }
+  return new Map([...nested, ...literal]);
+}
+var DECIMAL2 = /^[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?$/;
+function asNumber(v) {
+  if (typeof v === "number") return Number.isFinite(v) ? v : null;
+  if (typeof v === "string" && DECIMAL2.test(v.trim())) {
+    const n = Number(v.trim());
+    return Number.isFinite(n) ? n : null;
+  }
+  return null;
+}
+function canonical(v) {
+  if (Array.isArray(v)) return `[${v.map(canonical).join(",")}]`;
+  if (isPlainObject(v))
+    return `{${Object.keys(v).sort().map((k) => `${JSON.stringify(k)}:${canonical(v[k])}`).join(",")}}`;
+  return JSON.stringify(toJson(v));
+}
+function measure(v, resolution) {
+  const spec = resolution.status === "built-in" || resolution.status === "config" ? resolution.spec : null;
+  if (spec?.unlimited !== void 0) {
+    const n2 = asNumber(v);
+    if (v === null || spec.unlimited === "null-or-non-positive" && n2 !== null && n2 <= 0)
+      return { value: Infinity, unlimited: true, units: false };
+  }
+  if (spec?.domain === "units" && Array.isArray(v)) {
+    let total = 0;
+    for (const x of v) {
+      const n2 = asNumber(x);
+      if (n2 === null) return null;
+      total += n2;
+    }
+    return { value: total, unlimited: false, units: true };
+  }
+  const n = asNumber(v);
+  return n === null ? null : { value: n, unlimited: false, units: false };
+}
+function change(key, inB, b, inC, c, vocabulary) {
+  const resolution = resolveKnob(key, vocabulary);
+  const known = resolution.status === "built-in" || resolution.status === "config";
+  const role = known ? resolution.spec.role : null;
+  const inverse = known ? resolution.spec.inverse : false;
+  const base = {
+    hyperparameter: key,
+    role,
+    inverse,
+    origin: resolution.status,
+    ...inB ? { from: toJson(b) } : {},
+    ...inC ? { to: toJson(c) } : {}
+  };
+  const direction = (d) => {
+    const effect = effectOf(role, inverse, d);
+    return { ...base, direction: d, effect, pull: pullOf(effect) };
+  };
+  if (!inB) return direction("added");
+  if (!inC) return direction("removed");
+  const mb = measure(b, resolution);
+  const mc = measure(c, resolution);
+  if (mb === null || mc === null)
+    return canonical(b) === canonical(c) ? null : direction("changed");
+  if (known && resolution.spec.domain === "count-or-fraction" && mb.value < 1 !== mc.value < 1)
+    return direction("changed");
+  if (mb.value === mc.value) {
+    const reshaped = (mb.units || mc.units) && canonical(b) !== canonical(c);
+    return reshaped ? direction("changed") : null;
+  }
+  const out = direction(mc.value > mb.value ? "raised" : "lowered");
+  if (mb.value > 0 && mc.value > 0 && Number.isFinite(mb.value) && Number.isFinite(mc.value))
+    out.ratio = mc.value / mb.value;
+  if (mb.units || mc.units) out.totalUnits = { from: mb.value, to: mc.value };
+  if (mb.unlimited) out.unlimited = "from";
+  else if (mc.unlimited) out.unlimited = "to";
+  return out;
+}
+function prChanges(baseline, candidate, vocabulary = BUILT_IN_VOCABULARY) {
+  const b = flatten(baseline ?? {});
+  const c = flatten(candidate ?? {});
+  const keys = [.../* @__PURE__ */ new Set([...b.keys(), ...c.keys()])].sort();
+  const out = [];
+  for (const key of keys) {
+    const x = change(key, b.has(key), b.get(key), c.has(key), c.get(key), vocabulary);
+    if (x !== null) out.push(x);
+  }
+  return out;
 }
 
 // src/analysis/movement.ts
@@ -21476,10 +22307,10 @@ function gapTrend(points) {
   if (Math.abs(meanGap) <= RELATIVE_CHANGE * Math.abs(meanV)) {
     return { trend: "flat", changePerDoubling: meanGap !== 0 ? sxy / sxx / Math.abs(meanGap) : 0 };
   }
-  const change2 = sxy / sxx / Math.abs(meanGap);
-  if (change2 <= -RELATIVE_CHANGE) return { trend: "closing", changePerDoubling: change2 };
-  if (change2 < RELATIVE_CHANGE) return { trend: "flat", changePerDoubling: change2 };
-  return { trend: "unknown", changePerDoubling: change2 };
+  const change3 = sxy / sxx / Math.abs(meanGap);
+  if (change3 <= -RELATIVE_CHANGE) return { trend: "closing", changePerDoubling: change3 };
+  if (change3 < RELATIVE_CHANGE) return { trend: "flat", changePerDoubling: change3 };
+  return { trend: "unknown", changePerDoubling: change3 };
 }
 
 // src/analysis/curves/lttb.ts
@@ -21822,16 +22653,16 @@ function verdict(problem2, p, state, iterations, stop, lower, upper, evaluate, j
       q[j] = Math.min(Math.max(v, lower[j]), upper[j]);
       return evaluate(q).rss;
     };
-    const change2 = Math.max(
+    const change3 = Math.max(
       Math.abs(probe(pj + h) - state.rss),
       Math.abs(probe(pj - h) - state.rss)
     );
-    return !(change2 > 1e-12 * state.rss);
+    return !(change3 > 1e-12 * state.rss);
   });
-  const scaled = jac.map(
+  const scaled2 = jac.map(
     (row) => free.map((j) => norms[j] > 0 ? row[j] / norms[j] : 0)
   );
-  const qr = free.length > 0 && n >= free.length ? qrLeastSquares(scaled, state.r) : null;
+  const qr = free.length > 0 && n >= free.length ? qrLeastSquares(scaled2, state.r) : null;
   let relativeOffset = null;
   if (qr && dof > 0) {
     const q1 = Math.hypot(...qr.qtb.slice(0, free.length));
@@ -21960,8 +22791,8 @@ function fullCovariance(jac, rss) {
   if (dof <= 0) return null;
   const norms = Array.from({ length: p }, (_, j) => Math.hypot(...jac.map((row) => row[j] ?? 0)));
   if (norms.some((v) => !(v > 0) || !Number.isFinite(v))) return null;
-  const scaled = jac.map((row) => row.map((v, j) => v / norms[j]));
-  const inverse = inverseOfRtR(qrLeastSquares(scaled, new Array(n).fill(0)).r);
+  const scaled2 = jac.map((row) => row.map((v, j) => v / norms[j]));
+  const inverse = inverseOfRtR(qrLeastSquares(scaled2, new Array(n).fill(0)).r);
   if (!inverse) return null;
   const s2 = rss / dof;
   const covariance = inverse.map(
@@ -22023,10 +22854,10 @@ function regularizationMinimum(x, validationError, lambda) {
     const [x0, x1, x2] = [lx[i - 1], lx[i], lx[i + 1]];
     const [y0, y1, y2] = [validationError[i - 1], validationError[i], validationError[i + 1]];
     step = (x2 - x0) / 2;
-    const num = (x1 - x0) ** 2 * (y1 - y2) - (x1 - x2) ** 2 * (y1 - y0);
+    const num2 = (x1 - x0) ** 2 * (y1 - y2) - (x1 - x2) ** 2 * (y1 - y0);
     const den = (x1 - x0) * (y1 - y2) - (x1 - x2) * (y1 - y0);
     if (den !== 0) {
-      logBest = x1 - num / (2 * den);
+      logBest = x1 - num2 / (2 * den);
       refined = true;
     }
     suggestedX = Math.exp(logBest);
@@ -22177,17 +23008,13 @@ function splitSummary(run, split, alpha) {
   }
   return { split, mean: m, sd, repeats: n, examples: s.examples ?? null, ci };
 }
-function regularizationOf(run) {
-  for (const [key, value2] of Object.entries(run.hyperparameters ?? {})) {
-    if (typeof value2 === "number" && knobOf(key) === "regularization" && !/dropout/i.test(key))
-      return { key, value: value2 };
-  }
-  return void 0;
-}
 function summarize(run, settings) {
   const reference = chooseReference(run, settings.reference);
   const components = decompose(run, reference.value, settings);
-  const lambda = regularizationOf(run)?.value;
+  const lambda = regularizationKnob(
+    run.hyperparameters,
+    settings.vocabulary ?? BUILT_IN_VOCABULARY
+  )?.value;
   return {
     name: run.run.name,
     commit: run.run.commit ?? null,
@@ -22234,7 +23061,7 @@ function compareSlices(baseline, candidate, aggregate, settings) {
   const slices2 = pairs.map(({ b, c, test }, i) => {
     const pAdjusted = adjusted[i] ?? null;
     const call = callOf({ ...test, p: pAdjusted }, settings);
-    const change2 = call === "flat" ? "flat" : call === "up" === (sign === 1) ? "worse" : "better";
+    const change3 = call === "flat" ? "flat" : call === "up" === (sign === 1) ? "worse" : "better";
     return {
       name: c.name,
       examples: c.examples ?? null,
@@ -22242,8 +23069,8 @@ function compareSlices(baseline, candidate, aggregate, settings) {
       candidate: c.validation,
       delta: toMetricDelta(test, settings),
       pAdjusted,
-      change: change2,
-      hiddenRegression: change2 === "worse" && aggregate === "better"
+      change: change3,
+      hiddenRegression: change3 === "worse" && aggregate === "better"
     };
   });
   return { slices: slices2, unpaired };
@@ -22278,7 +23105,16 @@ function buildReview(input) {
   const settings = reviewSettings(input.settings);
   const calls = { alpha: settings.alpha, minEffect: settings.minEffect };
   const reference = input.settings.reference;
-  const summarySettings = { ...settings, ...reference === void 0 ? {} : { reference } };
+  const vocabulary = runVocabulary(
+    mergeRoles(BUILT_IN_VOCABULARY, input.settings.hyperparameters),
+    baseline.hyperparameters,
+    candidate.hyperparameters
+  );
+  const summarySettings = {
+    ...settings,
+    vocabulary,
+    ...reference === void 0 ? {} : { reference }
+  };
   const base = summarize(baseline, summarySettings);
   const cand = summarize(candidate, summarySettings);
   const runs = { baseline, candidate };
@@ -22298,7 +23134,11 @@ function buildReview(input) {
   };
   const sliceResult = compareSlices(baseline, candidate, validation.change, calls);
   const noiseUnknown = validation.delta.test === "none" || components.variance.test === "none";
-  const changes = diffHyperparameters(baseline.hyperparameters, candidate.hyperparameters);
+  const changes = prChanges(
+    knobValues(baseline.hyperparameters),
+    knobValues(candidate.hyperparameters),
+    vocabulary
+  );
   const { levers, nonLevers: nonLevers2 } = chooseLevers({
     goal: candidate.metric.goal,
     candidate: cand,
@@ -22306,9 +23146,10 @@ function buildReview(input) {
     movement,
     bias: components.bias ?? NO_BIAS_CHANGE,
     variance: components.variance,
-    pulled: pulledLevers(changes),
     changes,
-    regularization: regularizationOf(candidate),
+    vocabulary,
+    roles: runRoles(candidate.hyperparameters, vocabulary),
+    regularization: regularizationKnob(candidate.hyperparameters, vocabulary),
     noiseUnknown
   });
   const gate = applyGate(
@@ -22329,7 +23170,7 @@ function buildReview(input) {
     baseline: base,
     candidate: cand,
     slices: sliceResult.slices,
-    hyperparameters: changes,
+    hyperparameters: changes.map(hyperparameterChange),
     levers,
     nonLevers: nonLevers2,
     gate,
@@ -22341,7 +23182,8 @@ function buildReview(input) {
         slices: sliceResult.slices,
         noiseUnknown,
         biasUnknown: cand.biasUnknown,
-        paired: input.paired
+        paired: input.paired,
+        changes
       })
     ],
     paired: pairedSummary(input.paired)
@@ -22349,6 +23191,19 @@ function buildReview(input) {
 }
 function reviewNotes(facts) {
   const notes = [];
+  const unmapped = facts.changes.filter((c) => c.origin === "unknown" || c.origin === "ambiguous");
+  if (unmapped.length > 0) {
+    notes.push({
+      code: "unmapped-hyperparameters",
+      count: unmapped.length,
+      changes: unmapped.slice(0, NOTE_NAMES).map((c) => ({
+        key: c.hyperparameter,
+        ambiguous: c.origin === "ambiguous",
+        baseline: c.from ?? null,
+        candidate: c.to ?? null
+      }))
+    });
+  }
   if (facts.components.varianceFallback) notes.push({ code: "train-dev-in-one-run" });
   if (facts.unpaired.length > 0) {
     notes.push({
@@ -22370,6 +23225,21 @@ function reviewNotes(facts) {
   if (facts.paired !== void 0 && facts.paired.rows === 0)
     notes.push({ code: "predictions-share-no-id" });
   return notes;
+}
+function hyperparameterChange(c) {
+  return {
+    key: c.hyperparameter,
+    baseline: c.from ?? null,
+    candidate: c.to ?? null,
+    kind: c.direction,
+    role: c.role,
+    inverse: c.inverse,
+    origin: c.origin,
+    effect: c.effect,
+    ...c.ratio === void 0 ? {} : { ratio: c.ratio },
+    ...c.totalUnits === void 0 ? {} : { totalUnits: true },
+    ...c.unlimited === void 0 ? {} : { unlimited: c.unlimited === "from" ? "baseline" : "candidate" }
+  };
 }
 function pairedSummary(paired) {
   if (paired === void 0) return null;
@@ -22575,7 +23445,8 @@ function resolveSettings(config, overrides = {}) {
     minEffect: overrides.minEffect ?? config["min-effect"] ?? DEFAULT_SETTINGS.minEffect,
     gapTolerance: overrides.gapTolerance ?? config["gap-tolerance"] ?? DEFAULT_SETTINGS.gapTolerance,
     failOn: overrides.failOn ?? config["fail-on"] ?? [...DEFAULT_SETTINGS.failOn],
-    ...reference === void 0 ? {} : { reference }
+    ...reference === void 0 ? {} : { reference },
+    ...config.hyperparameters === void 0 ? {} : { hyperparameters: config.hyperparameters }
   };
 }
 function sameMetric(baseline, candidate) {
@@ -22978,8 +23849,8 @@ var SIGNIFICANT = 4;
 var MAX_DECIMALS = 6;
 function numberFormatFor(review) {
   let largest = 0;
-  for (const change2 of review.splits) {
-    largest = Math.max(largest, Math.abs(change2.baseline), Math.abs(change2.candidate));
+  for (const change3 of review.splits) {
+    largest = Math.max(largest, Math.abs(change3.baseline), Math.abs(change3.candidate));
   }
   const decimals = largest === 0 || !Number.isFinite(largest) ? SIGNIFICANT : Math.min(MAX_DECIMALS, Math.max(0, SIGNIFICANT - 1 - Math.floor(Math.log10(largest))));
   return { kind: review.metric.kind, decimals };
@@ -23006,7 +23877,7 @@ function signedDigits(v, f) {
   if (isZero(text2)) return text2;
   return v > 0 ? `+${text2}` : `${MINUS}${text2}`;
 }
-function change(v, f) {
+function change2(v, f) {
   return `${signedDigits(v, f)}${unit(f)}`;
 }
 function amount(v, f) {
@@ -23064,13 +23935,13 @@ function chartNumber(v, decimals) {
 }
 
 // src/report/words.ts
-function words(entries) {
+function words2(entries) {
   return new Map(Object.entries(entries));
 }
 function say(table2, code, esc) {
   return table2.get(code) ?? esc(String(code), 60);
 }
-var MOVEMENT_TITLE = words({
+var MOVEMENT_TITLE = words2({
   "better-on-both": "less bias and less variance",
   "away-from-underfitting": "away from underfitting",
   "toward-overfitting": "toward overfitting",
@@ -23079,7 +23950,7 @@ var MOVEMENT_TITLE = words({
   "toward-underfitting": "toward underfitting",
   "worse-on-both": "more bias and more variance"
 });
-var MOVEMENT_SENTENCE = words({
+var MOVEMENT_SENTENCE = words2({
   "better-on-both": "The change lowered both avoidable bias and variance",
   "away-from-underfitting": "The change moved the model away from underfitting",
   "toward-overfitting": "The change moved the model toward overfitting",
@@ -23088,25 +23959,25 @@ var MOVEMENT_SENTENCE = words({
   "toward-underfitting": "The change moved the model toward underfitting",
   "worse-on-both": "The change raised both avoidable bias and variance"
 });
-var VALIDATION_WORD = words({
+var VALIDATION_WORD = words2({
   better: "better",
   worse: "worse",
   flat: "unchanged within noise"
 });
-var DIAGNOSIS_WORD = words({
+var DIAGNOSIS_WORD = words2({
   "good-fit": "good fit",
   "high-bias": "high bias (underfitting)",
   "high-variance": "high variance (overfitting)",
   "data-mismatch": "data mismatch",
   "high-bias-and-variance": "high bias and high variance"
 });
-var COMPONENT_TITLE = words({
+var COMPONENT_TITLE = words2({
   bias: "Avoidable bias",
   variance: "Variance",
   mismatch: "Data mismatch",
   overfit: "Validation overfit"
 });
-var COMPONENT_WORD = words({
+var COMPONENT_WORD = words2({
   bias: "avoidable bias",
   variance: "variance",
   mismatch: "data mismatch",
@@ -23118,13 +23989,13 @@ var COMPONENT_ORDER = [
   "mismatch",
   "overfit"
 ];
-var SPLIT_WORD = words({
+var SPLIT_WORD = words2({
   train: "train",
   train_dev: "train-dev",
   validation: "validation",
   test: "test"
 });
-var LEVER_TITLE = words({
+var LEVER_TITLE = words2({
   "more-data": "Add training data",
   "fewer-features": "Use fewer features",
   "stronger-regularization": "Strengthen regularization",
@@ -23140,21 +24011,21 @@ var LEVER_TITLE = words({
   "add-repeats": "Repeat each run with several seeds",
   "supply-reference": "Supply a reference error level"
 });
-var TEST_WORD = words({
+var TEST_WORD = words2({
   "welch-t": "Welch's t-test",
   "z-binomial": "binomial z-test",
   "mcnemar-exact": "McNemar's exact test",
   "paired-t": "paired t-test",
   none: "no test"
 });
-var TEST_WHY = words({
+var TEST_WHY = words2({
   "welch-t": "Welch's t-test on per-repeat values: each run has two or more repeats (seeds), and their spreads may differ.",
   "z-binomial": "normal approximation with binomial variances: one repeat of a proportion metric measured on a known number of examples.",
   "mcnemar-exact": "McNemar's exact test: both runs scored the same examples, so only the examples on which they disagree carry information.",
   "paired-t": "paired t-test on per-example loss differences: both runs scored the same examples with a continuous loss.",
   none: "no test: with one repeat of a continuous metric and no paired predictions, run-to-run noise is unknown, so only min-effect decides."
 });
-var REFERENCE_SOURCE = words({
+var REFERENCE_SOURCE = words2({
   artifact: "from the artifact",
   config: "from the config",
   default: "the default for a minimized proportion",
@@ -23174,6 +24045,24 @@ function levelPercent(review) {
   return String(Number(((1 - review.settings.alpha) * 100).toPrecision(4)));
 }
 var CAUTION = "This verdict is advice for a human reviewer, not a proof: it rests on the numbers the two runs recorded and on the tests named in the method notes.";
+var EFFECT_WORD = words2({
+  "more-regularization": "stronger regularization",
+  "less-regularization": "weaker regularization",
+  "more-capacity": "a bigger model",
+  "less-capacity": "a smaller model",
+  "more-features": "more features",
+  "fewer-features": "fewer features",
+  "higher-degree": "higher-degree terms",
+  "lower-degree": "lower-degree terms",
+  "more-data": "more training data",
+  "less-data": "less training data",
+  "longer-training": "longer training",
+  "shorter-training": "shorter training",
+  "later-stopping": "later early stopping",
+  "earlier-stopping": "earlier early stopping",
+  "larger-steps": "larger optimiser steps",
+  "smaller-steps": "smaller optimiser steps"
+});
 
 // src/report/gate.ts
 var OUTCOME_SENTENCE = /* @__PURE__ */ new Map([
@@ -23217,8 +24106,17 @@ function leverText(lever, review, f, esc) {
   if (lever.suggestion !== void 0) sentences.push(suggestionSentence(lever.suggestion, ctx));
   return { title: say(LEVER_TITLE, lever.id, esc), sentences };
 }
+function leverHeadline(lever, review, f, esc) {
+  const ctx = { review, f, esc };
+  const title = say(LEVER_TITLE, lever.id, esc);
+  if (lever.suggestion !== void 0)
+    return { title, sentences: [suggestionSentence(lever.suggestion, ctx)] };
+  const first = lever.evidence.flatMap((e) => evidenceSentence(e, lever.id, ctx) ?? [])[0];
+  return { title, sentences: first === void 0 ? [] : [first] };
+}
 function fromTo(e) {
-  return `${short(e.from)} \u2192 ${short(e.to)}`;
+  const v = (x) => x === null ? "no limit" : short(x);
+  return `${v(e.from)} \u2192 ${v(e.to)}`;
 }
 function evidenceSentence(e, id, ctx) {
   const { f, esc, review } = ctx;
@@ -23230,18 +24128,22 @@ function evidenceSentence(e, id, ctx) {
       if (e.component === "overfit")
         return `Test error exceeds validation error by ${amount(e.value, f)}: model choices may be tuned to the validation set; enlarge or refresh it.`;
       return `The candidate has high ${say(COMPONENT_WORD, e.component, esc)}: ${amount(e.value, f)} against a validation error of ${value(e.errorLevel, f)}.`;
-    case "pr-change":
-      return `This PR ${e.direction === "raised" ? "raised" : "lowered"} ${esc(e.hyperparameter, 60)} ${fromTo(e)}.`;
+    case "pr-change": {
+      const units = e.totalUnits === true ? " hidden units in total" : "";
+      return `This PR ${e.direction === "raised" ? "raised" : "lowered"} ${esc(e.hyperparameter, 60)} ${fromTo(e)}${units}: ${say(EFFECT_WORD, e.effect, esc)}.`;
+    }
     case "component-change": {
       const word = e.delta.call === "up" ? "rose" : e.delta.call === "down" ? "fell" : "held steady";
       const toward = e.delta.call !== "up" ? "" : e.component === "bias" ? ": the model moved toward underfitting" : ": the model moved toward overfitting";
-      return `${say(COMPONENT_TITLE, e.component, esc)} ${word} (${change(e.delta.estimate, f)}, ${pText(e.delta.p)})${toward}.`;
+      return `${say(COMPONENT_TITLE, e.component, esc)} ${word} (${change2(e.delta.estimate, f)}, ${pText(e.delta.p)})${toward}.`;
     }
     case "already-pulled":
       return `This PR already ${e.direction === "raised" ? "raised" : "lowered"} ${esc(e.hyperparameter, 60)} (${fromTo(e)}): judge its effect before pulling further.`;
     case "sweep-minimum":
       return sweepSentence(e, ctx);
     case "learning-curve": {
+      if (e.includesToday)
+        return `More data is unlikely to help measurably: at ${count(e.atX)} training examples the power-law fit projects validation ${metric} ${value(e.projected, f)}, with an interval (${valueRange(e.ci, f)}) that includes today's ${value(e.current, f)}.`;
       const times = e.fromX > 0 ? ` (${short(e.atX / e.fromX)}\xD7 the largest on the curve)` : "";
       return `At ${count(e.atX)} training examples${times} the power-law fit (R\xB2 ${fixed(e.r2, 2)}) projects validation ${metric} ${value(e.current, f)} \u2192 ${value(e.projected, f)} (${valueRange(e.ci, f)}).`;
     }
@@ -23276,9 +24178,51 @@ function sweepSentence(e, ctx) {
     return `The sweep's validation minimum (${at}) lies on the other side of the candidate's strength.${edge}`;
   return `The regularization sweep has its lowest validation (${value(e.bestValidation, f)}) at ${at}.${edge}`;
 }
+var BASIS = {
+  "between-old-and-new": ", between the old and new values",
+  "back-to-baseline": ", the baseline value",
+  "finite-limit": ", a finite limit instead of none",
+  "sweep-minimum": ", the sweep's minimum",
+  "beyond-sweep-edge": ", one grid step beyond the end of the sweep"
+};
 function suggestionSentence(s, ctx) {
-  const basis = s.basis === "between-old-and-new" ? ", between the old and new values" : s.basis === "sweep-minimum" ? ", the sweep's minimum" : ", one grid step beyond the end of the sweep";
-  return `Try ${ctx.esc(s.hyperparameter, 60)} \u2248 ${short(s.value)}${basis}.`;
+  const basis = BASIS[s.basis] ?? "";
+  const units = s.totalUnits === true ? " hidden units in total" : "";
+  return `Try ${ctx.esc(s.hyperparameter, 60)} \u2248 ${short(s.value)}${units}${basis}.`;
+}
+
+// src/report/pr-summary.ts
+var PR_SUMMARY_CHANGES = 4;
+function valueText(v, esc) {
+  if (typeof v === "number") return short(v);
+  if (v === null) return "no limit";
+  return esc(JSON.stringify(v) ?? String(v), 30);
+}
+function factor(ratio) {
+  if (ratio === void 0 || !Number.isFinite(ratio) || ratio <= 0) return "";
+  const two = (x) => short(Number(x.toPrecision(2)));
+  return ratio >= 1 ? ` (\xD7${two(ratio)})` : ` (\xF7${two(1 / ratio)})`;
+}
+function phrase(c, esc) {
+  const name = esc(c.key, 60);
+  const values = `${valueText(c.unlimited === "baseline" ? null : c.baseline, esc)} \u2192 ${valueText(c.unlimited === "candidate" ? null : c.candidate, esc)}`;
+  if (c.kind === "added") return `added ${name} = ${valueText(c.candidate, esc)}`;
+  if (c.kind === "removed") return `removed ${name}`;
+  if (c.kind === "changed") return `changed ${name} ${values}`;
+  const effect = c.effect === null || c.effect === void 0 ? "" : `: ${say(EFFECT_WORD, c.effect, esc)}`;
+  const unknown = c.role === null ? " (role unknown)" : "";
+  return `${c.kind} ${name} ${values}${factor(c.ratio)}${effect}${unknown}`;
+}
+function prSummary(review, esc) {
+  const all = review.hyperparameters;
+  if (all.length === 0) return null;
+  const known = all.filter((c) => c.effect !== null && c.effect !== void 0);
+  const rest = all.filter((c) => c.effect === null || c.effect === void 0);
+  const inert = (c) => c.role === "inert";
+  const ordered = [...known, ...rest.filter((c) => !inert(c)), ...rest.filter(inert)];
+  const shown = ordered.slice(0, PR_SUMMARY_CHANGES).map((c) => phrase(c, esc));
+  const more = ordered.length - shown.length;
+  return `${shown.join("; ")}${more > 0 ? `; and ${count(more)} more` : ""}.`;
 }
 
 // src/report/tables.ts
@@ -23356,16 +24300,20 @@ function decompositionTable(review, esc, compact = false) {
 function diagnosisLine(review, esc) {
   return `Diagnosis: baseline ${say(DIAGNOSIS_WORD, review.baseline.diagnosis, esc)}; candidate ${say(DIAGNOSIS_WORD, review.candidate.diagnosis, esc)}.`;
 }
-function leversTable(review, esc) {
+var LEVERS_SHOWN = 3;
+function leversTable(review, esc, range = {}) {
   const f = numberFormatFor(review);
-  return {
-    header: ["#", "Lever", "Why"],
-    align: ["r", "l", "l"],
-    rows: review.levers.map((lever, i) => {
-      const text2 = leverText(lever, review, f, esc);
-      return [String(i + 1), text2.title, text2.sentences.join(" ") || "\u2014"];
-    })
-  };
+  const said = /* @__PURE__ */ new Set();
+  const rows = [];
+  review.levers.forEach((lever, i) => {
+    const text2 = leverText(lever, review, f, esc);
+    const fresh = text2.sentences.filter((s) => !said.has(s));
+    for (const s of text2.sentences) said.add(s);
+    if (i < (range.from ?? 0) || i >= (range.to ?? Infinity)) return;
+    const why = fresh.length > 0 ? fresh.join(" ") : text2.sentences.length > 0 ? "For the reason above." : "\u2014";
+    rows.push([String(i + 1), text2.title, why]);
+  });
+  return { header: ["#", "Lever", "Why"], align: ["r", "l", "l"], rows };
 }
 function sliceHarm(slice, review) {
   return review.metric.goal === "minimize" ? slice.delta.estimate : -slice.delta.estimate;
@@ -23432,7 +24380,7 @@ function hyperparameterTable(review, esc) {
 // src/report/headline.ts
 function changePhrase(name, delta, review, f) {
   if (delta === null) return `${name} unknown`;
-  const stats = delta.ci === null ? `${change(delta.estimate, f)}, noise unknown` : `${change(delta.estimate, f)}, ${levelPercent(review)}% interval ${changeInterval(delta.ci, f)}, ${pText(delta.p)}`;
+  const stats = delta.ci === null ? `${change2(delta.estimate, f)}, noise unknown` : `${change2(delta.estimate, f)}, ${levelPercent(review)}% interval ${changeInterval(delta.ci, f)}, ${pText(delta.p)}`;
   const word = delta.call === "up" ? "rose" : delta.call === "down" ? "fell" : "held steady";
   return `${name} ${word} (${stats})`;
 }
@@ -23448,9 +24396,12 @@ function buildHeadline(review, esc) {
   const vSplit = review.splits.find((s) => s.split === "validation");
   const movementTone = GOOD_MOVEMENTS.has(review.movement) ? "good" : review.movement === "no-significant-change" ? "neutral" : "bad";
   const vTone = v.change === "better" ? "good" : v.change === "worse" ? "bad" : "neutral";
-  const vStats = v.delta.ci === null ? `${change(v.delta.estimate, f)}; run-to-run noise unknown` : `${change(v.delta.estimate, f)}, ${levelPercent(review)}% interval ${changeInterval(v.delta.ci, f)}, ${pText(v.delta.p)}, ${say(TEST_WORD, v.delta.test, esc)}`;
+  const vStats = v.delta.ci === null ? `${change2(v.delta.estimate, f)}; run-to-run noise unknown` : `${change2(v.delta.estimate, f)}, ${levelPercent(review)}% interval ${changeInterval(v.delta.ci, f)}, ${pText(v.delta.p)}, ${say(TEST_WORD, v.delta.test, esc)}`;
   const from = vSplit === void 0 ? "" : `${value(vSplit.baseline, f)} \u2192 ${value(vSplit.candidate, f)} `;
+  const did = prSummary(review, esc);
+  const errorTerms = review.metric.goal === "maximize" ? ` Bias and variance are in error terms (1 \u2212 ${metric}).` : "";
   const lines = [
+    ...did === null ? [] : [{ label: "This PR", text: did, tone: "neutral" }],
     {
       label: say(MOVEMENT_SENTENCE, review.movement, esc),
       text: `${changePhrase("avoidable bias", review.bias.delta, review, f)}; ${changePhrase(
@@ -23462,7 +24413,7 @@ function buildHeadline(review, esc) {
         DIAGNOSIS_WORD,
         review.candidate.diagnosis,
         esc
-      )}.`,
+      )}.${errorTerms}`,
       tone: movementTone
     },
     {
@@ -23480,7 +24431,7 @@ function buildHeadline(review, esc) {
   if (first === void 0)
     lines.push({ label: "Next lever", text: "none suggested.", tone: "neutral" });
   else {
-    const text2 = leverText(first, review, f, esc);
+    const text2 = leverHeadline(first, review, f, esc);
     lines.push({
       label: `Next lever: ${text2.title}`,
       text: text2.sentences.join(" ") || "\u2014",
@@ -23492,7 +24443,7 @@ function buildHeadline(review, esc) {
   if (worst !== void 0) {
     lines.push({
       label: `${hidden.length} ${hidden.length === 1 ? "slice" : "slices"} got worse while validation improved`,
-      text: `worst: ${esc(worst.name, 60)} (${value(worst.baseline, f)} \u2192 ${value(worst.candidate, f)}, ${change(worst.delta.estimate, f)}).`,
+      text: `worst: ${esc(worst.name, 60)} (${value(worst.baseline, f)} \u2192 ${value(worst.candidate, f)}, ${change2(worst.delta.estimate, f)}).`,
       tone: "bad"
     });
   }
@@ -23718,6 +24669,11 @@ function interpolate(points, x, logX) {
 function names(list, total, esc) {
   return `${list.map((n) => esc(n, 60)).join(", ")}${total > list.length ? ", \u2026" : ""}`;
 }
+function jsonText(v, esc) {
+  if (typeof v === "number") return short(v);
+  if (v === null) return "none";
+  return esc(JSON.stringify(v) ?? String(v), 40);
+}
 function slices(n) {
   return `${count(n)} ${n === 1 ? "slice" : "slices"}`;
 }
@@ -23745,6 +24701,13 @@ function noteSentence(note, review, f, esc) {
       return `${esc(note.file, 120)}: the artifact has its own epoch curve; the epoch log ${esc(note.log, 120)} was not used.`;
     case "epoch-log-missing":
       return `No epoch log ${esc(note.log, 120)} next to ${esc(note.file, 120)}; the config's epoch-log mapping was not applied to it.`;
+    case "unmapped-hyperparameters": {
+      const list = note.changes.map(
+        (c) => `${esc(c.key, 60)} ${jsonText(c.baseline, esc)} \u2192 ${jsonText(c.candidate, esc)}${c.ambiguous ? " (means different things in different libraries)" : ""}`
+      ).join("; ");
+      const more = note.count > note.changes.length ? `; and ${count(note.count - note.changes.length)} more` : "";
+      return `The PR changed ${note.count === 1 ? "a hyperparameter" : "hyperparameters"} whose role fitgap does not know, so no lever rests on ${note.count === 1 ? "it" : "them"}: ${list}${more}. Map ${note.count === 1 ? "it" : "them"} in the config's \`hyperparameters\` (role and inverse).`;
+    }
     default:
       return esc(String(note.code), 60);
   }
@@ -23955,6 +24918,25 @@ Too large for this space: see the JSON report.
 `;
   return stub.length <= target ? stub : stub.slice(0, Math.max(0, target));
 }
+var EVIDENCE_CHART = {
+  "sweep-minimum": "regularization",
+  "learning-curve": "training_examples",
+  "gap-trend": "training_examples",
+  "epoch-minimum": "epochs",
+  "still-improving": "epochs",
+  diagnosis: "plane",
+  "component-change": "plane",
+  "pr-change": "plane"
+};
+function openChart(review, charts) {
+  const kinds = (review.levers[0]?.evidence ?? []).flatMap((e) => EVIDENCE_CHART[e.kind] ?? []);
+  const ordered = [...kinds.filter((k) => k !== "plane"), "plane"];
+  for (const kind of ordered) {
+    const chart2 = charts.find((c) => c.kind === kind);
+    if (chart2 !== void 0) return chart2;
+  }
+  return void 0;
+}
 function table(t) {
   const body = markdownTable([t.header, ...t.rows], { align: t.align, alignDelimiters: false });
   return t.units === void 0 || t.units === null ? body : `${t.units}
@@ -23980,15 +24962,34 @@ function compose(review, { marker, files, charts }, d) {
   const missing = unavailableNotes(review, escapeInline);
   if (missing.length > 0) out.push(...missing.map((m) => `- ${m}`), "");
   if (review.levers.length > 0) {
-    out.push("### Next levers", "", table(leversTable(review, escapeInline)), "");
+    out.push(
+      "### Next levers",
+      "",
+      table(leversTable(review, escapeInline, { to: LEVERS_SHOWN })),
+      ""
+    );
+    const more = review.levers.length - LEVERS_SHOWN;
+    if (more > 0)
+      out.push(
+        ...details(`${count(more)} more ${more === 1 ? "lever" : "levers"}`, [
+          table(leversTable(review, escapeInline, { from: LEVERS_SHOWN }))
+        ])
+      );
   }
-  if (d.charts) {
-    if (charts.length > 0) {
-      out.push("### Charts", "");
-      for (const chart2 of charts) {
-        out.push(chart2.caption, "", "```mermaid", chart2.code, "```", "");
-      }
-    }
+  if (d.charts && charts.length > 0) {
+    const open = openChart(review, charts);
+    const fence = (chart2) => [
+      chart2.caption,
+      "",
+      "```mermaid",
+      chart2.code,
+      "```",
+      ""
+    ];
+    if (open !== void 0) out.push("### Chart", "", ...fence(open));
+    const folded = charts.filter((c) => c !== open);
+    if (folded.length > 0)
+      out.push(...details(open === void 0 ? "Charts" : "More charts", folded.flatMap(fence)));
   }
   if (review.slices.length > 0 && d.slices > 0) {
     const c = sliceCounts(review.slices);
@@ -24447,10 +25448,10 @@ function decodeText(input, file, what) {
   }
   return text2.charCodeAt(0) === 65279 ? text2.slice(1) : text2;
 }
-var DECIMAL = /^[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?$/;
+var DECIMAL3 = /^[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?$/;
 function parseDecimal(text2) {
   const t = text2.trim();
-  if (DECIMAL.test(t)) return Number(t);
+  if (DECIMAL3.test(t)) return Number(t);
   if (/^[+-]?(?:nan|inf|infinity)$/i.test(t)) return /nan/i.test(t) ? Number.NaN : Infinity;
   return void 0;
 }
@@ -25001,7 +26002,7 @@ function readMlflowMetric(input, file, key, options = {}) {
     if (raw.trim() === "") continue;
     const line = i + 1;
     const fields = raw.trim().split(/\s+/);
-    const [timestamp, valueText, stepText = "0"] = fields;
+    const [timestamp, valueText2, stepText = "0"] = fields;
     if (fields.length < 2 || fields.length > 3 || !INTEGER.test(timestamp ?? "") || !INTEGER.test(stepText)) {
       throw new InputError([
         {
@@ -25013,10 +26014,10 @@ function readMlflowMetric(input, file, key, options = {}) {
         }
       ]);
     }
-    const value2 = parseDecimal(valueText ?? "");
+    const value2 = parseDecimal(valueText2 ?? "");
     if (value2 === void 0 || !Number.isFinite(value2)) {
       if (series.problems.length < 10)
-        series.problems.push(notFinite(file, `line ${line}`, `metric "${key}"`, valueText ?? ""));
+        series.problems.push(notFinite(file, `line ${line}`, `metric "${key}"`, valueText2 ?? ""));
       continue;
     }
     budget.take(file, `line ${line}`);
@@ -25029,7 +26030,7 @@ function readMlflowMetric(input, file, key, options = {}) {
 function isObject(value2) {
   return typeof value2 === "object" && value2 !== null && !Array.isArray(value2);
 }
-function escapePointer(segment) {
+function escapePointer2(segment) {
   return segment.replace(/~/g, "~0").replace(/\//g, "~1");
 }
 function readEvalsResult(input, file, options = {}) {
@@ -25066,7 +26067,7 @@ function readEvalsResult(input, file, options = {}) {
   const series = [];
   const names2 = /* @__PURE__ */ new Set();
   for (const [set, metrics] of Object.entries(doc)) {
-    const setPointer = `/${escapePointer(set)}`;
+    const setPointer = `/${escapePointer2(set)}`;
     if (!isObject(metrics))
       throw shape(
         setPointer,
@@ -25074,7 +26075,7 @@ function readEvalsResult(input, file, options = {}) {
         metrics
       );
     for (const [metric, values] of Object.entries(metrics)) {
-      const path = `${setPointer}/${escapePointer(metric)}`;
+      const path = `${setPointer}/${escapePointer2(metric)}`;
       if (!Array.isArray(values))
         throw shape(path, "must be an array with one value per boosting round", values);
       if (series.length >= MAX_SERIES)
@@ -25607,7 +26608,7 @@ var nodeCurveLogFs = {
     }
   }
 };
-var MAX_DEPTH = 8;
+var MAX_DEPTH2 = 8;
 var MAX_ENTRIES = 5e4;
 function problem(display, expected, hint) {
   const issue = { file: display, pointer: "", expected };
@@ -25622,7 +26623,7 @@ async function search(fs, root, match, want) {
   const found = [];
   let queue = [{ path: root.path, rel: "" }];
   let seen = 0;
-  for (let depth = 0; depth <= MAX_DEPTH && queue.length > 0; depth++) {
+  for (let depth = 0; depth <= MAX_DEPTH2 && queue.length > 0; depth++) {
     const next = [];
     for (const dir of queue) {
       const entries = await fs.readdir(dir.path);

@@ -6,25 +6,11 @@
  */
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
-import { chooseLevers, type LeverContext } from '../../../src/analysis/levers/choose.js';
-import {
-  knobValues,
-  regularizationKnob,
-  runRoles,
-  runVocabulary,
-} from '../../../src/analysis/levers/knobs.js';
-import { prChanges } from '../../../src/analysis/levers/pr-changes.js';
-import { BUILT_IN_VOCABULARY, mergeRoles } from '../../../src/analysis/levers/resolve-knob.js';
+import { chooseLevers } from '../../../src/analysis/levers/choose.js';
 import { significantDigits } from '../../../src/analysis/levers/rounding.js';
 import type { HyperparameterRolesConfig } from '../../../src/model/hyperparameter-roles.js';
-import type {
-  Component,
-  Diagnosis,
-  LeverId,
-  Movement,
-  RunSummary,
-  ShortfallDelta,
-} from '../../../src/model/review.js';
+import type { Diagnosis, LeverId, Movement } from '../../../src/model/review.js';
+import { contextFor } from './lever-context.js';
 
 interface FixtureCase {
   name: string;
@@ -47,72 +33,6 @@ interface FixtureCase {
 const fixture = JSON.parse(
   readFileSync(new URL('../../fixtures/levers/sklearn-named.json', import.meta.url), 'utf8'),
 ) as { cases: FixtureCase[] };
-
-function component(name: Component['name'], value: number): Component {
-  return { name, value, ci: null, p: null, present: value > 0.02 };
-}
-
-/** A candidate with the fixture's diagnosis: components sized so the diagnosis is the larger one. */
-export function summaryWith(diagnosis: Diagnosis): RunSummary {
-  const bias = diagnosis === 'high-bias' || diagnosis === 'high-bias-and-variance' ? 0.1 : 0.01;
-  const variance =
-    diagnosis === 'high-variance' || diagnosis === 'high-bias-and-variance' ? 0.08 : 0.01;
-  return {
-    name: 'candidate',
-    commit: null,
-    createdAt: null,
-    reference: 0.02,
-    referenceSource: 'artifact',
-    splits: [],
-    errorLevel: 0.2,
-    components: {
-      bias: component('bias', bias),
-      variance: component('variance', variance),
-      mismatch: component('mismatch', 0),
-      overfit: component('overfit', 0),
-    },
-    diagnosis,
-    biasUnknown: false,
-    warnings: [],
-    curves: {},
-  };
-}
-
-const UP: ShortfallDelta = {
-  unit: 'shortfall',
-  estimate: 0.03,
-  ci: [0.01, 0.05],
-  p: 0.001,
-  test: 'welch-t',
-  call: 'up',
-};
-const FLAT: ShortfallDelta = { ...UP, estimate: 0, ci: [-0.01, 0.01], p: 0.9, call: 'flat' };
-
-export function contextFor(
-  c: Pick<FixtureCase, 'baseline' | 'candidate' | 'candidateDiagnosis' | 'movement' | 'config'>,
-): LeverContext {
-  const b = c.baseline.hyperparameters;
-  const h = c.candidate.hyperparameters;
-  const vocabulary = runVocabulary(
-    mergeRoles(BUILT_IN_VOCABULARY, c.config?.hyperparameters),
-    b,
-    h,
-  );
-  const summary = summaryWith(c.candidateDiagnosis);
-  return {
-    goal: 'minimize',
-    candidate: summary,
-    baseline: summaryWith('good-fit'),
-    movement: c.movement,
-    bias: c.movement === 'toward-underfitting' ? UP : FLAT,
-    variance: c.movement === 'toward-overfitting' ? UP : FLAT,
-    changes: prChanges(knobValues(b), knobValues(h), vocabulary),
-    vocabulary,
-    roles: runRoles(h, vocabulary),
-    regularization: regularizationKnob(h, vocabulary),
-    noiseUnknown: false,
-  };
-}
 
 describe('first lever for scikit-learn-named changes (common practice)', () => {
   it.each(fixture.cases.map((c) => [c.name, c] as const))('%s', (_name, c) => {
