@@ -94,7 +94,9 @@ describe('renderMarkdown', () => {
     );
     const items = [...doc.querySelectorAll('h2 + ul > li')].map((li) => li.textContent);
     // This fixture records changes without roles (an older report): directions and values only.
-    expect(items[0]).toMatch(/^This PR: raised hidden_units 64 → 256; lowered weight_decay 0.001 → 0.0001; /);
+    expect(items[0]).toMatch(
+      /^This PR: raised hidden_units 64 → 256; lowered weight_decay 0.001 → 0.0001; /,
+    );
     expect(items[1]).toMatch(/^The change moved the model toward overfitting: avoidable bias fell/);
     expect(items[2]).toBe(
       "Validation mae_loaves worse: 6.050 → 6.380 (Δ +0.330, 95% interval [+0.120, +0.540], p = 0.006, Welch's t-test).",
