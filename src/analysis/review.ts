@@ -130,6 +130,7 @@ export function buildReview(input: ReviewInput): Review {
     roles: runRoles(candidate.hyperparameters, vocabulary),
     regularization: regularizationKnob(candidate.hyperparameters, vocabulary),
     noiseUnknown,
+    ...undeterminedOf(validation),
   });
   const gate = applyGate(
     { movement, validation, slices: sliceResult.slices, candidate: cand },
@@ -215,6 +216,19 @@ function reviewNotes(facts: {
   if (facts.paired !== undefined && facts.paired.rows === 0)
     notes.push({ code: 'predictions-share-no-id' });
   return notes;
+}
+
+/**
+ * Whether the validation change is undetermined, and the repeats needed, read defensively: the
+ * `undetermined` call and `repeatsNeeded` belong to the noise model, which may not record them.
+ */
+function undeterminedOf(validation: {
+  change: string;
+}): { undetermined: { repeatsNeeded: number | null } } | Record<string, never> {
+  if (validation.change !== 'undetermined') return {};
+  const n: unknown = (validation as { repeatsNeeded?: unknown }).repeatsNeeded;
+  const repeatsNeeded = typeof n === 'number' && Number.isInteger(n) && n >= 1 ? n : null;
+  return { undetermined: { repeatsNeeded } };
 }
 
 /** A PR change as the review records it: the artifact's values, the kind, the role and effect. */

@@ -112,7 +112,8 @@ export type LeverId =
   | 'align-training-data'
   | 'bigger-validation-set'
   | 'add-repeats'
-  | 'supply-reference';
+  | 'supply-reference'
+  | 'repeat-with-seeds';
 /**
  * One fact behind a lever.
  */
@@ -128,7 +129,8 @@ export type LeverEvidenceItem =
   | StillImprovingEvidence
   | EpochCurveSilentEvidence
   | ReferenceMissingEvidence
-  | NoiseUnknownEvidence;
+  | NoiseUnknownEvidence
+  | ChangeUndeterminedEvidence;
 /**
  * Something the reviewer should know about the inputs or the method.
  */
@@ -685,6 +687,16 @@ export interface ReferenceMissingEvidence {
  */
 export interface NoiseUnknownEvidence {
   kind: 'noise-unknown';
+}
+/**
+ * The validation change could not be called either way at this noise: repeat both runs with more seeds before acting on any other lever.
+ */
+export interface ChangeUndeterminedEvidence {
+  kind: 'change-undetermined';
+  /**
+   * Repeats per run needed to detect the minimum effect; null when not known.
+   */
+  repeatsNeeded: number | null;
 }
 export interface Gate {
   pass: boolean;

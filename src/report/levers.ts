@@ -112,6 +112,10 @@ function evidenceSentence(e: LeverEvidence, id: LeverId, ctx: Context): string |
       return 'Bias is unknown without a reference level: add `reference` (human-level error, a prior system, or an estimated Bayes error) to the artifacts or the config.';
     case 'noise-unknown':
       return 'Run-to-run noise is unknown: train with 2 or more seeds (or ship per-example predictions) so changes can be tested.';
+    case 'change-undetermined':
+      return e.repeatsNeeded === null
+        ? 'The validation change is undetermined at this noise: no other lever can be judged yet.'
+        : `The validation change is undetermined at this noise: about ${count(e.repeatsNeeded)} repeats (seeds) per run would detect the minimum effect.`;
     default:
       return null;
   }

@@ -111,6 +111,7 @@ export const LEVER_TITLE = words<LeverId>({
   'bigger-validation-set': 'Use a bigger validation set',
   'add-repeats': 'Repeat each run with several seeds',
   'supply-reference': 'Supply a reference error level',
+  'repeat-with-seeds': 'Repeat both runs with more seeds first',
 });
 
 export const TEST_WORD = words<TestName>({

@@ -38,6 +38,11 @@ export interface LeverContext {
   /** The knob the candidate's regularization sweep varies (its x), if it has one. */
   regularization: RegularizationKnob | undefined;
   noiseUnknown: boolean;
+  /**
+   * Set when the validation change could not be called either way at this noise, with the repeats
+   * per run needed to detect the minimum effect (null when unknown).
+   */
+  undetermined?: { repeatsNeeded: number | null };
 }
 
 /** The candidate's analysed curves, or null where a curve is missing or was skipped. */

@@ -7,6 +7,8 @@
  * - 15–30: levers that only add evidence or that a secondary finding suggests.
  */
 
+/** The validation change is undetermined: more seeds come before any other lever. */
+export const REPEAT_FIRST = 110;
 /** Reverse an own regularization change that overshot (its effect is measured in this very PR). */
 export const REVERSE_OWN_CHANGE = 100;
 /** Keep the PR's capacity change and regularize harder, with the sweep pointing the same way. */

@@ -124,4 +124,14 @@ describe('lever rules on the model', () => {
     expect(s?.value).toBeGreaterThan(100);
     expect(s?.value).toBeLessThan(1024);
   });
+
+  it('puts repeating with more seeds first when the validation change is undetermined', () => {
+    const ctx = { ...contextFor(get('logistic-c-cut')), undetermined: { repeatsNeeded: 7 } };
+    const { levers } = chooseLevers(ctx);
+    expect(levers[0]).toMatchObject({
+      id: 'repeat-with-seeds',
+      evidence: [{ kind: 'change-undetermined', repeatsNeeded: 7 }],
+    });
+    expect(levers[1]?.id).toBe('weaker-regularization');
+  });
 });
