@@ -21585,6 +21585,7 @@ function specOf2(key, vocabulary) {
 }
 
 // src/analysis/levers/scores.ts
+var REPEAT_FIRST = 110;
 var REVERSE_OWN_CHANGE = 100;
 var COUNTER_WITH_SWEEP = 95;
 var STEP_BACK_CAPACITY = 90;
@@ -21961,6 +21962,11 @@ function secondaryLevers(ctx, curves, drafts) {
   }
   if (candidate.biasUnknown) {
     drafts.add("supply-reference", SUPPLY_REFERENCE, [{ kind: "reference-missing" }]);
+  }
+  if (ctx.undetermined !== void 0) {
+    drafts.add("repeat-with-seeds", REPEAT_FIRST, [
+      { kind: "change-undetermined", repeatsNeeded: ctx.undetermined.repeatsNeeded }
+    ]);
   }
   if (ctx.noiseUnknown) {
     drafts.add("add-repeats", ADD_REPEATS, [{ kind: "noise-unknown" }]);
@@ -23150,7 +23156,8 @@ function buildReview(input) {
     vocabulary,
     roles: runRoles(candidate.hyperparameters, vocabulary),
     regularization: regularizationKnob(candidate.hyperparameters, vocabulary),
-    noiseUnknown
+    noiseUnknown,
+    ...undeterminedOf(validation)
   });
   const gate = applyGate(
     { movement, validation, slices: sliceResult.slices, candidate: cand },
@@ -23225,6 +23232,12 @@ function reviewNotes(facts) {
   if (facts.paired !== void 0 && facts.paired.rows === 0)
     notes.push({ code: "predictions-share-no-id" });
   return notes;
+}
+function undeterminedOf(validation) {
+  if (validation.change !== "undetermined") return {};
+  const n = validation.repeatsNeeded;
+  const repeatsNeeded2 = typeof n === "number" && Number.isInteger(n) && n >= 1 ? n : null;
+  return { undetermined: { repeatsNeeded: repeatsNeeded2 } };
 }
 function hyperparameterChange(c) {
   return {
@@ -24009,7 +24022,8 @@ var LEVER_TITLE = words2({
   "align-training-data": "Make training data look like validation data",
   "bigger-validation-set": "Use a bigger validation set",
   "add-repeats": "Repeat each run with several seeds",
-  "supply-reference": "Supply a reference error level"
+  "supply-reference": "Supply a reference error level",
+  "repeat-with-seeds": "Repeat both runs with more seeds first"
 });
 var TEST_WORD = words2({
   "welch-t": "Welch's t-test",
@@ -24160,6 +24174,8 @@ function evidenceSentence(e, id, ctx) {
       return "Bias is unknown without a reference level: add `reference` (human-level error, a prior system, or an estimated Bayes error) to the artifacts or the config.";
     case "noise-unknown":
       return "Run-to-run noise is unknown: train with 2 or more seeds (or ship per-example predictions) so changes can be tested.";
+    case "change-undetermined":
+      return e.repeatsNeeded === null ? "The validation change is undetermined at this noise: no other lever can be judged yet." : `The validation change is undetermined at this noise: about ${count(e.repeatsNeeded)} repeats (seeds) per run would detect the minimum effect.`;
     default:
       return null;
   }

@@ -46285,7 +46285,8 @@ var LEVER_TITLE = words({
   "align-training-data": "Make training data look like validation data",
   "bigger-validation-set": "Use a bigger validation set",
   "add-repeats": "Repeat each run with several seeds",
-  "supply-reference": "Supply a reference error level"
+  "supply-reference": "Supply a reference error level",
+  "repeat-with-seeds": "Repeat both runs with more seeds first"
 });
 var TEST_WORD = words({
   "welch-t": "Welch's t-test",
@@ -46579,6 +46580,8 @@ function evidenceSentence(e, id, ctx) {
       return "Bias is unknown without a reference level: add `reference` (human-level error, a prior system, or an estimated Bayes error) to the artifacts or the config.";
     case "noise-unknown":
       return "Run-to-run noise is unknown: train with 2 or more seeds (or ship per-example predictions) so changes can be tested.";
+    case "change-undetermined":
+      return e.repeatsNeeded === null ? "The validation change is undetermined at this noise: no other lever can be judged yet." : `The validation change is undetermined at this noise: about ${count(e.repeatsNeeded)} repeats (seeds) per run would detect the minimum effect.`;
     default:
       return null;
   }
@@ -47913,7 +47916,8 @@ var fitgap_review_1_schema_default = {
         "align-training-data",
         "bigger-validation-set",
         "add-repeats",
-        "supply-reference"
+        "supply-reference",
+        "repeat-with-seeds"
       ]
     },
     unavailable: {
@@ -48777,6 +48781,9 @@ var fitgap_review_1_schema_default = {
         },
         {
           $ref: "#/$defs/leverNoiseUnknown"
+        },
+        {
+          $ref: "#/$defs/leverChangeUndetermined"
         }
       ]
     },
@@ -49183,6 +49190,23 @@ var fitgap_review_1_schema_default = {
             }
           },
           description: "The first few (at most 5) of them."
+        }
+      }
+    },
+    leverChangeUndetermined: {
+      title: "ChangeUndeterminedEvidence",
+      description: "The validation change could not be called either way at this noise: repeat both runs with more seeds before acting on any other lever.",
+      type: "object",
+      additionalProperties: false,
+      required: ["kind", "repeatsNeeded"],
+      properties: {
+        kind: {
+          const: "change-undetermined"
+        },
+        repeatsNeeded: {
+          type: ["integer", "null"],
+          minimum: 1,
+          description: "Repeats per run needed to detect the minimum effect; null when not known."
         }
       }
     }
@@ -50948,6 +50972,7 @@ function specOf2(key, vocabulary) {
 }
 
 // src/analysis/levers/scores.ts
+var REPEAT_FIRST = 110;
 var REVERSE_OWN_CHANGE = 100;
 var COUNTER_WITH_SWEEP = 95;
 var STEP_BACK_CAPACITY = 90;
@@ -51324,6 +51349,11 @@ function secondaryLevers(ctx, curves, drafts) {
   }
   if (candidate.biasUnknown) {
     drafts.add("supply-reference", SUPPLY_REFERENCE, [{ kind: "reference-missing" }]);
+  }
+  if (ctx.undetermined !== void 0) {
+    drafts.add("repeat-with-seeds", REPEAT_FIRST, [
+      { kind: "change-undetermined", repeatsNeeded: ctx.undetermined.repeatsNeeded }
+    ]);
   }
   if (ctx.noiseUnknown) {
     drafts.add("add-repeats", ADD_REPEATS, [{ kind: "noise-unknown" }]);
@@ -52513,7 +52543,8 @@ function buildReview(input) {
     vocabulary,
     roles: runRoles(candidate.hyperparameters, vocabulary),
     regularization: regularizationKnob(candidate.hyperparameters, vocabulary),
-    noiseUnknown
+    noiseUnknown,
+    ...undeterminedOf(validation)
   });
   const gate = applyGate(
     { movement, validation, slices: sliceResult.slices, candidate: cand },
@@ -52588,6 +52619,12 @@ function reviewNotes2(facts) {
   if (facts.paired !== void 0 && facts.paired.rows === 0)
     notes.push({ code: "predictions-share-no-id" });
   return notes;
+}
+function undeterminedOf(validation) {
+  if (validation.change !== "undetermined") return {};
+  const n = validation.repeatsNeeded;
+  const repeatsNeeded2 = typeof n === "number" && Number.isInteger(n) && n >= 1 ? n : null;
+  return { undetermined: { repeatsNeeded: repeatsNeeded2 } };
 }
 function hyperparameterChange(c) {
   return {
