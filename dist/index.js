@@ -17057,8 +17057,8 @@ var require_util7 = __commonJS({
           return false;
         }
       }
-      const num = Number.parseInt(value2, 10);
-      return num >= 8 && num <= 15;
+      const num2 = Number.parseInt(value2, 10);
+      return num2 >= 8 && num2 <= 15;
     }
     var hasIntl = typeof process.versions.icu === "string";
     var fatalDecoder = hasIntl ? new TextDecoder("utf-8", { fatal: true }) : void 0;
@@ -27236,8 +27236,8 @@ var require_jstat = __commonJS({
         function isFunction(arg) {
           return toString.call(arg) === "[object Function]";
         }
-        function isNumber(num) {
-          return typeof num === "number" ? num - num === 0 : false;
+        function isNumber(num2) {
+          return typeof num2 === "number" ? num2 - num2 === 0 : false;
         }
         function toVector(arr) {
           return concat.apply([], arr);
@@ -29199,9 +29199,9 @@ var require_jstat = __commonJS({
               var samplesDone = 0;
               for (var i2 = 0; i2 < x2; i2++) {
                 while (scaledCDF > 1 && samplesDone < n) {
-                  var factor = 1 - m / (N - samplesDone);
-                  scaledPDF *= factor;
-                  scaledCDF *= factor;
+                  var factor2 = 1 - m / (N - samplesDone);
+                  scaledPDF *= factor2;
+                  scaledCDF *= factor2;
                   samplesDone++;
                 }
                 scaledPDF *= (n - i2) * (m - i2) / ((i2 + 1) * (N - m - n + i2 + 1));
@@ -29821,7 +29821,7 @@ var require_jstat = __commonJS({
             return determinant;
           },
           gauss_elimination: function gauss_elimination(a, b) {
-            var i2 = 0, j = 0, n = a.length, m = a[0].length, factor = 1, sum = 0, x2 = [], maug, pivot, temp, k;
+            var i2 = 0, j = 0, n = a.length, m = a[0].length, factor2 = 1, sum = 0, x2 = [], maug, pivot, temp, k;
             a = jStat4.aug(a, b);
             maug = a[0].length;
             for (i2 = 0; i2 < n; i2++) {
@@ -29841,9 +29841,9 @@ var require_jstat = __commonJS({
                 }
               }
               for (j = i2 + 1; j < n; j++) {
-                factor = a[j][i2] / a[i2][i2];
+                factor2 = a[j][i2] / a[i2][i2];
                 for (k = i2; k < maug; k++) {
-                  a[j][k] = a[j][k] - factor * a[i2][k];
+                  a[j][k] = a[j][k] - factor2 * a[i2][k];
                 }
               }
             }
@@ -30121,13 +30121,13 @@ var require_jstat = __commonJS({
             var i2 = 0;
             var w = [];
             var p = [];
-            var alpha, r, k, j, factor;
+            var alpha, r, k, j, factor2;
             for (; i2 < m - 1; i2++) {
               alpha = 0;
               for (j = i2 + 1; j < n; j++)
                 alpha += a[j][i2] * a[j][i2];
-              factor = a[i2 + 1][i2] > 0 ? -1 : 1;
-              alpha = factor * Math2.sqrt(alpha);
+              factor2 = a[i2 + 1][i2] > 0 ? -1 : 1;
+              alpha = factor2 * Math2.sqrt(alpha);
               r = Math2.sqrt((alpha * alpha - a[i2 + 1][i2] * alpha) / 2);
               w = jStat4.zeros(m, 1);
               w[i2 + 1][0] = (a[i2 + 1][i2] - alpha) / (2 * r);
@@ -30745,28 +30745,28 @@ var require_jstat = __commonJS({
           // (value, alpha, sd, n)
           // (value, alpha, array)
           normalci: function normalci() {
-            var args = slice.call(arguments), ans = new Array(2), change2;
+            var args = slice.call(arguments), ans = new Array(2), change3;
             if (args.length === 4) {
-              change2 = Math2.abs(jStat4.normal.inv(args[1] / 2, 0, 1) * args[2] / Math2.sqrt(args[3]));
+              change3 = Math2.abs(jStat4.normal.inv(args[1] / 2, 0, 1) * args[2] / Math2.sqrt(args[3]));
             } else {
-              change2 = Math2.abs(jStat4.normal.inv(args[1] / 2, 0, 1) * jStat4.stdev(args[2]) / Math2.sqrt(args[2].length));
+              change3 = Math2.abs(jStat4.normal.inv(args[1] / 2, 0, 1) * jStat4.stdev(args[2]) / Math2.sqrt(args[2].length));
             }
-            ans[0] = args[0] - change2;
-            ans[1] = args[0] + change2;
+            ans[0] = args[0] - change3;
+            ans[1] = args[0] + change3;
             return ans;
           },
           // 2 different parameter setups
           // (value, alpha, sd, n)
           // (value, alpha, array)
           tci: function tci() {
-            var args = slice.call(arguments), ans = new Array(2), change2;
+            var args = slice.call(arguments), ans = new Array(2), change3;
             if (args.length === 4) {
-              change2 = Math2.abs(jStat4.studentt.inv(args[1] / 2, args[3] - 1) * args[2] / Math2.sqrt(args[3]));
+              change3 = Math2.abs(jStat4.studentt.inv(args[1] / 2, args[3] - 1) * args[2] / Math2.sqrt(args[3]));
             } else {
-              change2 = Math2.abs(jStat4.studentt.inv(args[1] / 2, args[2].length - 1) * jStat4.stdev(args[2], true) / Math2.sqrt(args[2].length));
+              change3 = Math2.abs(jStat4.studentt.inv(args[1] / 2, args[2].length - 1) * jStat4.stdev(args[2], true) / Math2.sqrt(args[2].length));
             }
-            ans[0] = args[0] - change2;
-            ans[1] = args[0] + change2;
+            ans[0] = args[0] - change3;
+            ans[1] = args[0] + change3;
             return ans;
           },
           significant: function significant(pvalue, alpha) {
@@ -33403,9 +33403,9 @@ var require_stringifyNumber = __commonJS({
     function stringifyNumber({ format, minFractionDigits, tag, value: value2 }) {
       if (typeof value2 === "bigint")
         return String(value2);
-      const num = typeof value2 === "number" ? value2 : Number(value2);
-      if (!isFinite(num))
-        return isNaN(num) ? ".nan" : num < 0 ? "-.inf" : ".inf";
+      const num2 = typeof value2 === "number" ? value2 : Number(value2);
+      if (!isFinite(num2))
+        return isNaN(num2) ? ".nan" : num2 < 0 ? "-.inf" : ".inf";
       let n = Object.is(value2, -0) ? "-0" : JSON.stringify(value2);
       if (!format && minFractionDigits && (!tag || tag === "tag:yaml.org,2002:float") && /^-?\d/.test(n) && !n.includes("e")) {
         let i2 = n.indexOf(".");
@@ -33445,8 +33445,8 @@ var require_float = __commonJS({
       test: /^[-+]?(?:\.[0-9]+|[0-9]+(?:\.[0-9]*)?)[eE][-+]?[0-9]+$/,
       resolve: (str) => parseFloat(str),
       stringify(node) {
-        const num = Number(node.value);
-        return isFinite(num) ? num.toExponential() : stringifyNumber.stringifyNumber(node);
+        const num2 = Number(node.value);
+        return isFinite(num2) ? num2.toExponential() : stringifyNumber.stringifyNumber(node);
       }
     };
     var float = {
@@ -33885,8 +33885,8 @@ var require_float2 = __commonJS({
       test: /^[-+]?(?:[0-9][0-9_]*)?(?:\.[0-9_]*)?[eE][-+]?[0-9]+$/,
       resolve: (str) => parseFloat(str.replace(/_/g, "")),
       stringify(node) {
-        const num = Number(node.value);
-        return isFinite(num) ? num.toExponential() : stringifyNumber.stringifyNumber(node);
+        const num2 = Number(node.value);
+        return isFinite(num2) ? num2.toExponential() : stringifyNumber.stringifyNumber(node);
       }
     };
     var float = {
@@ -34088,23 +34088,23 @@ var require_timestamp = __commonJS({
     function parseSexagesimal(str, asBigInt) {
       const sign = str[0];
       const parts = sign === "-" || sign === "+" ? str.substring(1) : str;
-      const num = (n) => asBigInt ? BigInt(n) : Number(n);
-      const res = parts.replace(/_/g, "").split(":").reduce((res2, p) => res2 * num(60) + num(p), num(0));
-      return sign === "-" ? num(-1) * res : res;
+      const num2 = (n) => asBigInt ? BigInt(n) : Number(n);
+      const res = parts.replace(/_/g, "").split(":").reduce((res2, p) => res2 * num2(60) + num2(p), num2(0));
+      return sign === "-" ? num2(-1) * res : res;
     }
     function stringifySexagesimal(node) {
       let { value: value2 } = node;
-      let num = (n) => n;
+      let num2 = (n) => n;
       if (typeof value2 === "bigint")
-        num = (n) => BigInt(n);
+        num2 = (n) => BigInt(n);
       else if (isNaN(value2) || !isFinite(value2))
         return stringifyNumber.stringifyNumber(node);
       let sign = "";
       if (value2 < 0) {
         sign = "-";
-        value2 *= num(-1);
+        value2 *= num2(-1);
       }
-      const _60 = num(60);
+      const _60 = num2(60);
       const parts = [value2 % _60];
       if (value2 < 60) {
         parts.unshift(0);
@@ -38539,7 +38539,7 @@ function lowercaseKeys(object) {
     return newObj;
   }, {});
 }
-function isPlainObject(value2) {
+function isPlainObject2(value2) {
   if (typeof value2 !== "object" || value2 === null) return false;
   if (Object.prototype.toString.call(value2) !== "[object Object]") return false;
   const proto = Object.getPrototypeOf(value2);
@@ -38550,7 +38550,7 @@ function isPlainObject(value2) {
 function mergeDeep(defaults2, options) {
   const result = Object.assign({}, defaults2);
   Object.keys(options).forEach((key) => {
-    if (isPlainObject(options[key])) {
+    if (isPlainObject2(options[key])) {
       if (!(key in defaults2)) Object.assign(result, { [key]: options[key] });
       else result[key] = mergeDeep(defaults2[key], options[key]);
     } else {
@@ -39038,7 +39038,7 @@ var init_dist = __esm({
 });
 
 // node_modules/json-with-bigint/json-with-bigint.js
-var intRegex, noiseValue, originalStringify, originalParse, customFormat, bigIntsStringify, noiseStringify, isUnstringifiable, isRawJSON, stringifyIteratively, JSONStringify, featureCache, isContextSourceSupported, convertMarkedBigIntsReviver, JSONParseV2, MAX_INT, MAX_DIGITS, stringsOrLargeNumbers, noiseValueWithQuotes, applyReviverIteratively, serializeBigInts, JSONParse;
+var intRegex, noiseValue, originalStringify, originalParse, customFormat, bigIntsStringify, noiseStringify, isUnstringifiable, isRawJSON, stringifyIteratively, JSONStringify, featureCache, isContextSourceSupported, convertMarkedBigIntsReviver, JSONParseV2, MAX_INT, MAX_DIGITS2, stringsOrLargeNumbers, noiseValueWithQuotes, applyReviverIteratively, serializeBigInts, JSONParse;
 var init_json_with_bigint = __esm({
   "node_modules/json-with-bigint/json-with-bigint.js"() {
     intRegex = /^-?\d+$/;
@@ -39296,7 +39296,7 @@ var init_json_with_bigint = __esm({
       });
     };
     MAX_INT = Number.MAX_SAFE_INTEGER.toString();
-    MAX_DIGITS = MAX_INT.length;
+    MAX_DIGITS2 = MAX_INT.length;
     stringsOrLargeNumbers = /"(?:[^"\\]|\\.)*"|-?(0|[1-9][0-9]*)(\.[0-9]+)?([eE][+-]?[0-9]+)?/g;
     noiseValueWithQuotes = /^"-?\d+n+"$/;
     applyReviverIteratively = (parsed, userReviver) => {
@@ -39349,7 +39349,7 @@ var init_json_with_bigint = __esm({
           const isNoise = isString && noiseValueWithQuotes.test(match);
           if (isNoise) return match.substring(0, match.length - 1) + 'n"';
           const hasFractionalOrExponential = fractional || exponential;
-          const isLessThanMaxSafeInt = digits2 && (digits2.length < MAX_DIGITS || digits2.length === MAX_DIGITS && digits2 <= MAX_INT);
+          const isLessThanMaxSafeInt = digits2 && (digits2.length < MAX_DIGITS2 || digits2.length === MAX_DIGITS2 && digits2 <= MAX_INT);
           const isStandardValue = isString || hasFractionalOrExponential || isLessThanMaxSafeInt;
           if (isStandardValue) return match;
           return '"' + match + 'n"';
@@ -39422,7 +39422,7 @@ var init_dist_src = __esm({
 });
 
 // node_modules/@octokit/request/dist-bundle/index.js
-function isPlainObject2(value2) {
+function isPlainObject3(value2) {
   if (typeof value2 !== "object" || value2 === null) return false;
   if (Object.prototype.toString.call(value2) !== "[object Object]") return false;
   const proto = Object.getPrototypeOf(value2);
@@ -39439,7 +39439,7 @@ async function fetchWrapper(requestOptions) {
   }
   const log = requestOptions.request?.log || console;
   const parseSuccessResponseBody = requestOptions.request?.parseSuccessResponseBody !== false;
-  const body = isPlainObject2(requestOptions.body) || Array.isArray(requestOptions.body) ? JSONStringify(requestOptions.body) : requestOptions.body;
+  const body = isPlainObject3(requestOptions.body) || Array.isArray(requestOptions.body) ? JSONStringify(requestOptions.body) : requestOptions.body;
   const requestHeaders = Object.fromEntries(
     Object.entries(requestOptions.headers).map(([name, value2]) => [
       name,
@@ -45471,7 +45471,8 @@ var LEVER_TITLE = words({
   "align-training-data": "Make training data look like validation data",
   "bigger-validation-set": "Use a bigger validation set",
   "add-repeats": "Repeat each run with several seeds",
-  "supply-reference": "Supply a reference error level"
+  "supply-reference": "Supply a reference error level",
+  "repeat-with-seeds": "Repeat both runs with more seeds first"
 });
 var TEST_WORD = words({
   "welch-t": "Welch's t-test",
@@ -45510,6 +45511,24 @@ function levelPercent(review2) {
   return String(Number(((1 - review2.settings.alpha) * 100).toPrecision(4)));
 }
 var CAUTION = "This verdict is advice for a human reviewer, not a proof: it rests on the numbers the two runs recorded and on the tests named in the method notes.";
+var EFFECT_WORD = words({
+  "more-regularization": "stronger regularization",
+  "less-regularization": "weaker regularization",
+  "more-capacity": "a bigger model",
+  "less-capacity": "a smaller model",
+  "more-features": "more features",
+  "fewer-features": "fewer features",
+  "higher-degree": "higher-degree terms",
+  "lower-degree": "lower-degree terms",
+  "more-data": "more training data",
+  "less-data": "less training data",
+  "longer-training": "longer training",
+  "shorter-training": "shorter training",
+  "later-stopping": "later early stopping",
+  "earlier-stopping": "earlier early stopping",
+  "larger-steps": "larger optimiser steps",
+  "smaller-steps": "smaller optimiser steps"
+});
 
 // src/report/gate.ts
 var OUTCOME_SENTENCE = /* @__PURE__ */ new Map([
@@ -47627,9 +47646,9 @@ function besideArtifact2(artifactPath, name) {
   const folder = posix2.dirname(artifactPath);
   if (name.includes("\\") || posix2.isAbsolute(name)) return null;
   const joined = posix2.normalize(posix2.join(folder, name));
-  const inside = folder === "." ? joined : joined.slice(folder.length + 1);
+  const inside2 = folder === "." ? joined : joined.slice(folder.length + 1);
   if (folder !== "." && !joined.startsWith(`${folder}/`)) return null;
-  if (inside === "" || inside === "." || inside.startsWith("../") || inside === "..") return null;
+  if (inside2 === "" || inside2 === "." || inside2.startsWith("../") || inside2 === "..") return null;
   return joined;
 }
 function namedPredictions(bytes) {
@@ -48378,10 +48397,10 @@ function shortfallSign(run) {
 function splitMeasure(split) {
   return { terms: [{ split, weight: 1 }], constant: 0 };
 }
-function perRepeat(run, measure) {
+function perRepeat(run, measure2) {
   const sign = shortfallSign(run);
   const columns = [];
-  for (const term of measure.terms) {
+  for (const term of measure2.terms) {
     const split = run.splits[term.split];
     if (split === void 0) return null;
     columns.push({ values: split.values, weight: term.weight });
@@ -48389,7 +48408,7 @@ function perRepeat(run, measure) {
   const repeats = run.splits.train.values.length;
   const out = [];
   for (let i2 = 0; i2 < repeats; i2++) {
-    let total = measure.constant;
+    let total = measure2.constant;
     for (const column of columns) total += column.weight * sign * (column.values[i2] ?? Number.NaN);
     out.push(total);
   }
@@ -48404,12 +48423,12 @@ function splitSampling(run, split, examples = {}) {
   }
   return examples[split] ?? null;
 }
-function measureSampling(run, measure, examples = {}) {
+function measureSampling(run, measure2, examples = {}) {
   const parts = [];
   let perRepeatRows = true;
   let known = true;
   let source = "binomial";
-  for (const term of measure.terms) {
+  for (const term of measure2.terms) {
     const split = run.splits[term.split];
     if ((split?.evaluationRows ?? "fixed") !== "per-repeat") perRepeatRows = false;
     const s = splitSampling(run, term.split, examples);
@@ -48449,21 +48468,21 @@ function deltaFields(result, settings) {
     call: callOf(result, settings)
   };
 }
-function measureNoise(run, measure, examples = {}) {
-  const values = perRepeat(run, measure);
+function measureNoise(run, measure2, examples = {}) {
+  const values = perRepeat(run, measure2);
   if (values === null) return null;
-  const { sampling, rows } = measureSampling(run, measure, examples);
+  const { sampling, rows } = measureSampling(run, measure2, examples);
   return splitNoise({ values, sampling, evaluationRows: rows });
 }
-function measureChange(baseline, candidate, measure, alpha, examples = {}) {
-  const b = measureNoise(baseline, measure.baseline, examples.baseline);
-  const c = measureNoise(candidate, measure.candidate, examples.candidate);
+function measureChange(baseline, candidate, measure2, alpha, examples = {}) {
+  const b = measureNoise(baseline, measure2.baseline, examples.baseline);
+  const c = measureNoise(candidate, measure2.candidate, examples.candidate);
   if (b === null || c === null) return null;
-  const newcombe = newcombeChange(baseline, candidate, measure, alpha);
+  const newcombe = newcombeChange(baseline, candidate, measure2, alpha);
   if (newcombe !== null) return newcombe;
   return compareSplitMeans(b, c, alpha);
 }
-function newcombeChange(baseline, candidate, measure, alpha) {
+function newcombeChange(baseline, candidate, measure2, alpha) {
   const counts = (run, m) => {
     const term = m.terms[0];
     if (run.metric.kind !== "proportion" || m.terms.length !== 1 || m.constant !== 0) return null;
@@ -48475,12 +48494,12 @@ function newcombeChange(baseline, candidate, measure, alpha) {
     const rate = shortfallSign(run) === 1 ? value2 : 1 - value2;
     return { x: Math.round(rate * split.examples), n: split.examples };
   };
-  const b = counts(baseline, measure.baseline);
-  const c = counts(candidate, measure.candidate);
+  const b = counts(baseline, measure2.baseline);
+  const c = counts(candidate, measure2.candidate);
   if (b === null || c === null) return null;
   const r = newcombeDifference(b.x, b.n, c.x, c.n, alpha);
   const sign = shortfallSign(candidate);
-  const estimate = sign * ((candidate.splits[measure.candidate.terms[0].split]?.values[0] ?? 0) - (baseline.splits[measure.baseline.terms[0].split]?.values[0] ?? 0));
+  const estimate = sign * ((candidate.splits[measure2.candidate.terms[0].split]?.values[0] ?? 0) - (baseline.splits[measure2.baseline.terms[0].split]?.values[0] ?? 0));
   const shift = estimate - r.estimate;
   return {
     estimate,
@@ -48490,8 +48509,8 @@ function newcombeChange(baseline, candidate, measure, alpha) {
     statistic: r.statistic
   };
 }
-function measureLevel(run, measure, alpha, examples = {}) {
-  const noise = measureNoise(run, measure, examples);
+function measureLevel(run, measure2, alpha, examples = {}) {
+  const noise = measureNoise(run, measure2, examples);
   if (noise === null) return null;
   const value2 = noise.mean;
   if (!noise.known) return { value: value2, ci: null, p: null };
@@ -48601,8 +48620,8 @@ function decompose(run, reference, settings, examples = {}) {
   const threshold = Math.max(settings.gapTolerance * errorLevel(run), settings.minEffect);
   const out = {};
   for (const name of ["bias", "variance", "mismatch", "overfit"]) {
-    const measure = measures[name];
-    const level = measure === null ? null : measureLevel(run, measure, settings.alpha, examples);
+    const measure2 = measures[name];
+    const level = measure2 === null ? null : measureLevel(run, measure2, settings.alpha, examples);
     if (level === null) {
       const unavailable = UNAVAILABLE.get(name);
       if (unavailable === void 0) throw new Error(`${name} needs splits every run has`);
@@ -48632,8 +48651,8 @@ function diagnose(components) {
 }
 
 // src/analysis/changes.ts
-function both(measure) {
-  return { baseline: measure, candidate: measure };
+function both(measure2) {
+  return { baseline: measure2, candidate: measure2 };
 }
 function lossScale(paired, run) {
   const side = paired.sides?.baseline;
@@ -48727,7 +48746,7 @@ function componentChanges(runs, references, calls, examples = {}) {
     alpha,
     examples
   );
-  const change2 = (name) => {
+  const change3 = (name) => {
     const mb = componentMeasures(baseline, refB)[name];
     const mc = componentMeasures(candidate, refC)[name];
     if (mb === null || mc === null) return null;
@@ -48735,26 +48754,26 @@ function componentChanges(runs, references, calls, examples = {}) {
     return r === null ? null : toShortfallDelta(r, calls);
   };
   const varianceFallback = baseline.splits.train_dev === void 0 !== (candidate.splits.train_dev === void 0);
-  const variance = varianceFallback ? validationMinusTrain(runs, calls, examples) : change2("variance");
+  const variance = varianceFallback ? validationMinusTrain(runs, calls, examples) : change3("variance");
   if (variance === null)
     throw new Error("variance needs train and validation, which the schema requires");
   return {
     bias: bias === null ? null : toShortfallDelta(bias, calls),
     variance,
-    mismatch: change2("mismatch"),
-    overfit: change2("overfit"),
+    mismatch: change3("mismatch"),
+    overfit: change3("overfit"),
     varianceFallback
   };
 }
 function validationMinusTrain(runs, calls, examples) {
-  const measure = {
+  const measure2 = {
     terms: [
       { split: "validation", weight: 1 },
       { split: "train", weight: -1 }
     ],
     constant: 0
   };
-  const r = measureChange(runs.baseline, runs.candidate, both(measure), calls.alpha, examples);
+  const r = measureChange(runs.baseline, runs.candidate, both(measure2), calls.alpha, examples);
   return r === null ? null : toShortfallDelta(r, calls);
 }
 
@@ -48814,9 +48833,9 @@ function exampleNoise(runs, paired) {
   };
 }
 function validationPower(runs, shortfall, alpha, examples) {
-  const measure = splitMeasure("validation");
-  const b = measureNoise(runs.baseline, measure, examples.baseline);
-  const c = measureNoise(runs.candidate, measure, examples.candidate);
+  const measure2 = splitMeasure("validation");
+  const b = measureNoise(runs.baseline, measure2, examples.baseline);
+  const c = measureNoise(runs.candidate, measure2, examples.candidate);
   if (b === null || c === null) throw new Error("validation split is required by the schema");
   const atLeast = b.basis.missing.length > 0 || c.basis.missing.length > 0;
   let mde = null;
@@ -49043,61 +49062,101 @@ function reviewGuardrails(baseline, candidate, settings) {
   });
 }
 
-// src/analysis/hyperparameters.ts
-function diffHyperparameters(baseline = {}, candidate = {}) {
-  const keys = [.../* @__PURE__ */ new Set([...Object.keys(baseline), ...Object.keys(candidate)])].sort();
-  const out = [];
-  for (const key of keys) {
-    const inB = Object.hasOwn(baseline, key);
-    const inC = Object.hasOwn(candidate, key);
-    const b = baseline[key];
-    const c = candidate[key];
-    if (!inB) out.push({ key, baseline: null, candidate: c, kind: "added" });
-    else if (!inC) out.push({ key, baseline: b, candidate: null, kind: "removed" });
-    else if (typeof b === "number" && typeof c === "number") {
-      if (c > b) out.push({ key, baseline: b, candidate: c, kind: "raised" });
-      else if (c < b) out.push({ key, baseline: b, candidate: c, kind: "lowered" });
-    } else if (JSON.stringify(b) !== JSON.stringify(c))
-      out.push({ key, baseline: b, candidate: c, kind: "changed" });
-  }
-  return out;
+// src/analysis/levers/rounding.ts
+var SUGGESTION_DIGITS = 2;
+var MAX_DIGITS = 17;
+function toSignificant(x2, digits2) {
+  if (x2 === 0 || !Number.isFinite(x2)) return x2;
+  return Number(x2.toPrecision(digits2));
 }
-var KNOBS = [
-  [
-    /^(lambda|l2|l2_penalty|weight_decay|reg(ularization)?(_strength)?|ridge_alpha|dropout)$/i,
-    "regularization"
-  ],
-  [/^(features|num_features|n_features|feature_count)$/i, "features"],
-  [/^(polynomial_degree|poly_degree|degree|interaction_terms)$/i, "feature-richness"],
-  [/^(train_examples|training_examples|n_train|train_size|num_train)$/i, "data"],
-  [/^(epochs|max_epochs|num_epochs|iterations|max_iter|steps)$/i, "epochs"],
-  [
-    /^(hidden_units|hidden_size|layers|num_layers|depth|max_depth|width|params|parameters|model_size|n_estimators)$/i,
-    "model-size"
-  ]
-];
-function knobOf(key) {
-  for (const [pattern, knob] of KNOBS) if (pattern.test(key)) return knob;
+function decade(v) {
+  const a = Math.abs(v);
+  let e = Math.floor(Math.log10(a));
+  if (scaled(1, e) > a) e -= 1;
+  else if (scaled(1, e + 1) <= a) e += 1;
+  return e;
+}
+function scaled(k, e) {
+  return Number(`${k}e${e}`);
+}
+function outward(v, digits2, integer, up) {
+  if (v === 0) return 0;
+  if (v < 0) return -outward(-v, digits2, integer, !up);
+  const e = integer ? Math.max(decade(v) - digits2 + 1, 0) : decade(v) - digits2 + 1;
+  let q = v / scaled(1, e);
+  const near = Math.round(q);
+  if (Math.abs(q - near) <= 1e-9 * Math.max(1, q)) q = near;
+  let k = up ? Math.ceil(q) : Math.floor(q);
+  let r = scaled(k, e);
+  if (up ? r < v : r > v) {
+    k += up ? 1 : -1;
+    r = scaled(k, e);
+  }
+  return r;
+}
+function nearest(x2, digits2, integer) {
+  if (!integer) return toSignificant(x2, digits2);
+  return Math.abs(x2) < 10 ** digits2 ? Math.round(x2) : toSignificant(x2, digits2);
+}
+function inside(v, lo, hi) {
+  return v >= lo && v <= hi;
+}
+function fewestDigits(x2, lo, hi, integer) {
+  for (let d = SUGGESTION_DIGITS; d <= MAX_DIGITS; d++) {
+    const r = nearest(x2, d, integer);
+    if (inside(r, lo, hi)) return r;
+    const edge = r < lo ? outward(lo, d, integer, true) : outward(hi, d, integer, false);
+    if (inside(edge, lo, hi)) return edge;
+  }
   return null;
 }
-var PULLED = {
-  regularization: { raised: "stronger-regularization", lowered: "weaker-regularization" },
-  features: { raised: "more-features", lowered: "fewer-features" },
-  "feature-richness": { raised: "richer-features", lowered: "fewer-features" },
-  data: { raised: "more-data", lowered: "more-data" },
-  epochs: { raised: "train-longer", lowered: "early-stopping" },
-  "model-size": { raised: "bigger-model", lowered: "smaller-model" }
-};
-function pulledLevers(changes) {
-  const out = [];
-  for (const change2 of changes) {
-    if (change2.kind !== "raised" && change2.kind !== "lowered") continue;
-    const knob = knobOf(change2.key);
-    if (knob === null) continue;
-    if (knob === "data" && change2.kind === "lowered") continue;
-    out.push({ lever: PULLED[knob][change2.kind], change: change2, knob });
+function roundSuggestion(x2, options = {}) {
+  if (!Number.isFinite(x2)) throw new RangeError(`cannot round ${String(x2)}: not a finite number`);
+  const integer = options.integer ?? false;
+  const [a, b] = options.range ?? [-Infinity, Infinity];
+  if (Number.isNaN(a) || Number.isNaN(b))
+    throw new RangeError("cannot round into a range with NaN");
+  const lo = Math.min(a, b);
+  const hi = Math.max(a, b);
+  const x0 = Math.min(hi, Math.max(lo, x2));
+  const grid = (options.grid ?? []).filter(
+    (g) => Number.isFinite(g) && inside(g, lo, hi) && (!integer || Number.isInteger(g))
+  );
+  if (grid.includes(x0)) return x0;
+  const v = fewestDigits(x0, lo, hi, integer) ?? Math.round(x0);
+  const key = toSignificant(v, SUGGESTION_DIGITS);
+  let snapped = null;
+  for (const g of grid)
+    if (toSignificant(g, SUGGESTION_DIGITS) === key && (snapped === null || Math.abs(g - x0) < Math.abs(snapped - x0)))
+      snapped = g;
+  return snapped ?? v;
+}
+function midpoint(a, b, scale) {
+  if (scale === "log" && a > 0 && b > 0) return Math.sqrt(a) * Math.sqrt(b);
+  return a / 2 + b / 2;
+}
+function between(a, b, options) {
+  const lo = Math.min(a, b);
+  const hi = Math.max(a, b);
+  const inset = (hi - lo) * 1e-9;
+  if (!(inset > 0)) return null;
+  const v = roundSuggestion(midpoint(lo, hi, options.scale), {
+    integer: options.integer,
+    range: [lo + inset, hi - inset],
+    ...options.grid === void 0 ? {} : { grid: options.grid }
+  });
+  return v > lo && v < hi ? v : null;
+}
+function isIntegerKnob(spec, values) {
+  switch (spec.domain) {
+    case "count":
+    case "units":
+      return true;
+    case "count-or-fraction":
+      return values.every((v) => v >= 1);
+    default:
+      return false;
   }
-  return out;
 }
 
 // src/analysis/levers/context.ts
@@ -49124,13 +49183,49 @@ var Drafts = class {
   has(id) {
     return this.#byId.has(id);
   }
+  get(id) {
+    return this.#byId.get(id);
+  }
+  delete(id) {
+    this.#byId.delete(id);
+  }
   /** Highest score first; drafts with equal scores keep the order they were first drafted in. */
   ranked() {
     return [...this.#byId.values()].sort((a, b) => b.score - a.score);
   }
 };
-function between(from, to) {
-  return from > 0 && to > 0 ? Math.sqrt(from * to) : (from + to) / 2;
+function sweepWants(sweep, knob) {
+  if (sweep.side === "unknown") return null;
+  if (sweep.side === "at") return "at";
+  const below = sweep.side === "below";
+  return below !== (knob?.inverse ?? false) ? "stronger" : "weaker";
+}
+function sweepSuggestion(sweep, knob, wants) {
+  const grid = sweep.chart.map((p) => p.x).filter((x2) => Number.isFinite(x2));
+  const lo = Math.min(...grid);
+  const hi = Math.max(...grid);
+  const value2 = sweep.atEdge === null && grid.length > 0 ? roundSuggestion(sweep.bestX, { grid, range: [lo, hi] }) : roundSuggestion(sweep.suggestedX);
+  const up = wants === "stronger" !== knob.inverse;
+  if (up ? !(value2 > knob.value) : !(value2 < knob.value)) return void 0;
+  return {
+    hyperparameter: knob.key,
+    value: value2,
+    basis: sweep.atEdge === null ? "sweep-minimum" : "beyond-sweep-edge"
+  };
+}
+function sweepEvidence(sweep, knob, lever) {
+  const wants = sweepWants(sweep, knob);
+  return {
+    kind: "sweep-minimum",
+    hyperparameter: knob?.key ?? null,
+    bestX: sweep.bestX,
+    bestValidation: sweep.bestValidation,
+    current: knob?.value ?? null,
+    suggestedX: sweep.suggestedX,
+    side: sweep.side,
+    supports: wants === null ? null : wants === lever,
+    atEdge: sweep.atEdge
+  };
 }
 function savedByStopping(e, goal) {
   const sign = goal === "minimize" ? 1 : -1;
@@ -49164,7 +49259,471 @@ var BY_TARGET = {
   ]
 };
 
+// src/analysis/levers/vocabulary.ts
+var words2 = (list) => list.split(/\s+/).filter((w) => w !== "");
+var SKLEARN = "scikit-learn";
+var COMMON = "common practice";
+var VOCABULARY = [
+  // Regularization: higher = stronger.
+  {
+    names: words2("alpha"),
+    role: "regularization",
+    inverse: false,
+    domain: "non-negative",
+    scale: "log",
+    source: `${SKLEARN} Ridge, Lasso, ElasticNet, SGDClassifier, MLPClassifier (alpha); XGBoost alpha (L1)`,
+    caveat: "some texts and optimisers use alpha for a learning rate or a smoothing constant"
+  },
+  {
+    names: words2(
+      "lambda reg_lambda lambda_l2 l2 l2_penalty l2_reg l2_regularization l2_leaf_reg ridge_alpha"
+    ),
+    role: "regularization",
+    inverse: false,
+    domain: "non-negative",
+    scale: "log",
+    source: `${SKLEARN} HistGradientBoosting (l2_regularization); XGBoost, LightGBM, CatBoost L2 terms; ${COMMON} (lambda)`
+  },
+  {
+    names: words2("reg_alpha lambda_l1 l1 l1_penalty l1_reg"),
+    role: "regularization",
+    inverse: false,
+    domain: "non-negative",
+    scale: "log",
+    source: `XGBoost, LightGBM L1 terms; ${COMMON}`
+  },
+  {
+    names: words2("reg regularization reg_strength regularization_strength penalty_strength"),
+    role: "regularization",
+    inverse: false,
+    domain: "non-negative",
+    scale: "log",
+    source: COMMON
+  },
+  {
+    names: words2("weight_decay"),
+    role: "regularization",
+    inverse: false,
+    domain: "non-negative",
+    scale: "log",
+    source: `${COMMON} (PyTorch and Keras optimisers)`
+  },
+  {
+    names: words2("ccp_alpha min_impurity_decrease"),
+    role: "regularization",
+    inverse: false,
+    domain: "non-negative",
+    scale: "log",
+    source: `${SKLEARN} decision trees and forests (pruning and split thresholds)`
+  },
+  {
+    names: words2(
+      "min_child_weight min_sum_hessian_in_leaf min_split_loss min_split_gain min_gain_to_split"
+    ),
+    role: "regularization",
+    inverse: false,
+    domain: "non-negative",
+    scale: "log",
+    source: `XGBoost, LightGBM ("larger is more conservative"); ${COMMON}`
+  },
+  {
+    names: words2("min_samples_leaf min_samples_split"),
+    role: "regularization",
+    inverse: false,
+    domain: "count-or-fraction",
+    scale: "linear",
+    source: `${SKLEARN} decision trees, forests, gradient boosting`
+  },
+  {
+    names: words2("min_child_samples min_data_in_leaf"),
+    role: "regularization",
+    inverse: false,
+    domain: "count",
+    scale: "linear",
+    source: `LightGBM; ${COMMON}`
+  },
+  {
+    names: words2("dropout dropout_rate label_smoothing"),
+    role: "regularization",
+    inverse: false,
+    domain: "fraction",
+    scale: "linear",
+    source: COMMON
+  },
+  // Inverse regularization: lower = stronger.
+  {
+    names: words2("C"),
+    role: "regularization",
+    inverse: true,
+    domain: "positive",
+    scale: "log",
+    source: `${SKLEARN} LogisticRegression, SVC, LinearSVC: "Inverse of regularization strength"`
+  },
+  {
+    names: words2(
+      "subsample bagging_fraction colsample_bytree colsample_bylevel colsample_bynode feature_fraction"
+    ),
+    role: "regularization",
+    inverse: true,
+    domain: "fraction",
+    scale: "linear",
+    source: `${SKLEARN} GradientBoosting (subsample < 1 "leads to a reduction of variance"); XGBoost, LightGBM row and column sampling`
+  },
+  // Capacity: higher = more.
+  {
+    names: words2("max_depth max_leaves"),
+    role: "capacity",
+    inverse: false,
+    domain: "count",
+    scale: "linear",
+    unlimited: "null-or-non-positive",
+    source: `${SKLEARN} trees (None = unlimited); XGBoost, LightGBM (0 or below = no limit)`
+  },
+  {
+    names: words2("max_leaf_nodes"),
+    role: "capacity",
+    inverse: false,
+    domain: "count",
+    scale: "linear",
+    unlimited: "null",
+    source: `${SKLEARN} trees, HistGradientBoosting (None = unlimited)`
+  },
+  {
+    names: words2("num_leaves depth"),
+    role: "capacity",
+    inverse: false,
+    domain: "count",
+    scale: "linear",
+    source: `LightGBM (num_leaves), CatBoost (depth); ${COMMON}`
+  },
+  {
+    names: words2("n_estimators num_boost_round num_iterations num_round nrounds"),
+    role: "capacity",
+    inverse: false,
+    domain: "count",
+    scale: "linear",
+    source: `${SKLEARN} GradientBoosting (boosting stages); XGBoost, LightGBM rounds; ${COMMON}`,
+    caveat: "in bagging ensembles (random forests) more trees mostly average variance away and do not overfit: map it as inert there"
+  },
+  {
+    names: words2("hidden_layer_sizes layer_sizes"),
+    role: "capacity",
+    inverse: false,
+    domain: "units",
+    scale: "linear",
+    source: `${SKLEARN} MLPClassifier, MLPRegressor ("number of neurons in the ith hidden layer")`,
+    caveat: "an array is compared by its total units, a single number as one layer of that many units (scikit-learn accepts both)"
+  },
+  {
+    names: words2(
+      "n_layers num_layers layers hidden_layers hidden_units hidden_size hidden_dim units n_units num_units width d_model model_size params parameters n_params num_params"
+    ),
+    role: "capacity",
+    inverse: false,
+    domain: "count",
+    scale: "linear",
+    source: COMMON
+  },
+  {
+    names: words2("n_neighbors"),
+    role: "capacity",
+    inverse: true,
+    domain: "count",
+    scale: "linear",
+    source: `${SKLEARN} KNeighbors*; ${COMMON} (more neighbours = a smoother fit)`
+  },
+  // Features and polynomial degree.
+  {
+    names: words2("features n_features num_features feature_count"),
+    role: "features",
+    inverse: false,
+    domain: "count",
+    scale: "linear",
+    source: COMMON
+  },
+  {
+    names: words2("n_features_to_select"),
+    role: "features",
+    inverse: false,
+    domain: "count-or-fraction",
+    scale: "linear",
+    source: `${SKLEARN} RFE`
+  },
+  {
+    names: words2("degree polynomial_degree poly_degree"),
+    role: "polynomial-degree",
+    inverse: false,
+    domain: "count",
+    scale: "linear",
+    source: `${SKLEARN} PolynomialFeatures, SVC (poly kernel)`
+  },
+  // Data size.
+  {
+    names: words2(
+      "train_examples training_examples n_train num_train train_samples n_samples num_samples dataset_size data_size"
+    ),
+    role: "data-size",
+    inverse: false,
+    domain: "count",
+    scale: "linear",
+    source: COMMON
+  },
+  {
+    names: words2("train_size"),
+    role: "data-size",
+    inverse: false,
+    domain: "count-or-fraction",
+    scale: "linear",
+    source: `${SKLEARN} train_test_split (an int is a count, a float a fraction)`
+  },
+  {
+    names: words2("train_fraction"),
+    role: "data-size",
+    inverse: false,
+    domain: "fraction",
+    scale: "linear",
+    source: COMMON
+  },
+  // Training length.
+  {
+    names: words2(
+      "epochs num_epochs n_epochs max_epochs steps max_steps num_steps train_steps iterations n_iter"
+    ),
+    role: "epochs",
+    inverse: false,
+    domain: "count",
+    scale: "linear",
+    source: COMMON,
+    caveat: "CatBoost's iterations counts trees (capacity); both mean more fitting. A scikit-learn Pipeline's steps is a list of estimators, compared as text"
+  },
+  {
+    names: words2("max_iter"),
+    role: "epochs",
+    inverse: false,
+    domain: "count",
+    scale: "linear",
+    source: `${SKLEARN} MLP and SGD (epochs for stochastic solvers), LogisticRegression (solver iterations)`,
+    caveat: "in HistGradientBoosting it counts trees (capacity); for a convex solver that converged it changes nothing"
+  },
+  {
+    names: words2("tol"),
+    role: "epochs",
+    inverse: true,
+    domain: "non-negative",
+    scale: "log",
+    source: `${SKLEARN} solvers ("tolerance for stopping criteria"); ${COMMON} (a smaller tolerance trains longer)`
+  },
+  {
+    names: words2(
+      "patience early_stopping_patience early_stopping_rounds early_stopping_round n_iter_no_change stopping_rounds"
+    ),
+    role: "early-stopping-patience",
+    inverse: false,
+    domain: "count",
+    scale: "linear",
+    source: `${SKLEARN} SGD, MLP, GradientBoosting (n_iter_no_change); XGBoost, LightGBM, Keras; ${COMMON}`
+  },
+  // Step size.
+  {
+    names: words2("learning_rate learning_rate_init lr eta base_lr max_lr"),
+    role: "learning-rate",
+    inverse: false,
+    domain: "positive",
+    scale: "log",
+    source: `${SKLEARN} GradientBoosting, HistGradientBoosting (shrinkage), MLP (learning_rate_init); XGBoost eta`,
+    caveat: "scikit-learn MLP's learning_rate is a schedule name, compared as text"
+  },
+  // Known and not a bias/variance knob.
+  {
+    names: words2("random_state seed random_seed n_jobs nthread num_threads verbose verbosity"),
+    role: "inert",
+    inverse: false,
+    domain: "count",
+    scale: "linear",
+    source: COMMON
+  }
+];
+var AMBIGUOUS = [
+  {
+    names: words2("gamma"),
+    readings: [
+      "scikit-learn SVC: RBF kernel coefficient, higher = more capacity",
+      "XGBoost: minimum split loss, higher = stronger regularization"
+    ],
+    source: `${SKLEARN} SVC; XGBoost`
+  },
+  {
+    names: words2("max_features"),
+    readings: [
+      "scikit-learn trees and forests: features sampled per split, lower = stronger regularization",
+      "CountVectorizer, SelectFromModel: how many features the model gets"
+    ],
+    source: SKLEARN
+  },
+  {
+    names: words2("max_samples"),
+    readings: [
+      "scikit-learn forests and bagging: bootstrap sample per tree, lower = more randomisation",
+      "not the size of the training set"
+    ],
+    source: SKLEARN
+  },
+  {
+    names: words2("n_components"),
+    readings: ["PCA: features kept", "GaussianMixture: mixture components (capacity)"],
+    source: SKLEARN
+  },
+  {
+    names: words2("rate decay"),
+    readings: ["dropout rate or weight decay (regularization)", "learning rate or its decay"],
+    source: COMMON
+  },
+  {
+    names: words2("epsilon eps"),
+    readings: ["SVR: tube width, higher = less capacity", "optimisers: a numerical constant"],
+    source: COMMON
+  }
+];
+
+// src/analysis/levers/resolve-knob.ts
+function normaliseName(name) {
+  return name.replace(/([a-z0-9])([A-Z])/g, "$1_$2").toLowerCase().replace(/-/g, "_");
+}
+function lastSegment(normalised) {
+  const parts = normalised.split(/\.|\/|__/).filter((p) => p !== "");
+  const last = parts[parts.length - 1];
+  return parts.length > 1 && last !== void 0 ? last : null;
+}
+function specOf(group) {
+  return {
+    role: group.role,
+    inverse: group.inverse,
+    domain: group.domain,
+    scale: group.scale,
+    ...group.unlimited === void 0 ? {} : { unlimited: group.unlimited }
+  };
+}
+function builtInVocabulary() {
+  const map = /* @__PURE__ */ new Map();
+  for (const group of VOCABULARY)
+    for (const name of group.names)
+      map.set(normaliseName(name), { kind: "knob", origin: "built-in", spec: specOf(group) });
+  for (const group of AMBIGUOUS)
+    for (const name of group.names)
+      map.set(normaliseName(name), { kind: "ambiguous", readings: group.readings });
+  return map;
+}
+var BUILT_IN_VOCABULARY = builtInVocabulary();
+var COUNT_ROLES = /* @__PURE__ */ new Set([
+  "capacity",
+  "features",
+  "polynomial-degree",
+  "data-size",
+  "epochs",
+  "early-stopping-patience"
+]);
+function specFromConfig(entry) {
+  const integer = entry.integer ?? COUNT_ROLES.has(entry.role);
+  return {
+    role: entry.role,
+    inverse: entry.inverse ?? false,
+    domain: integer ? "count" : "non-negative",
+    scale: entry.scale ?? (integer ? "linear" : "log")
+  };
+}
+function configRoleConflicts(config) {
+  const groups2 = /* @__PURE__ */ new Map();
+  for (const key of Object.keys(config)) {
+    const n = normaliseName(key);
+    groups2.set(n, [...groups2.get(n) ?? [], key]);
+  }
+  return [...groups2.values()].filter((g) => g.length > 1);
+}
+function mergeRoles(base, config) {
+  if (config === void 0) return base;
+  const map = new Map(base);
+  for (const [key, entry] of Object.entries(config))
+    map.set(normaliseName(key), { kind: "knob", origin: "config", spec: specFromConfig(entry) });
+  return map;
+}
+function resolveKnob(name, vocabulary = BUILT_IN_VOCABULARY) {
+  const whole = normaliseName(name);
+  for (const candidate of [whole, lastSegment(whole)]) {
+    if (candidate === null) continue;
+    const item = vocabulary.get(candidate);
+    if (item === void 0) continue;
+    return item.kind === "knob" ? { status: item.origin, matched: candidate, spec: item.spec } : { status: "ambiguous", matched: candidate, readings: item.readings };
+  }
+  return { status: "unknown" };
+}
+
+// src/analysis/levers/knobs.ts
+var WRITER_KEYS = ["inverse_knobs", "curve_knobs"];
+function isRecord(v) {
+  return typeof v === "object" && v !== null && !Array.isArray(v);
+}
+function knobValues(h) {
+  const out = {};
+  for (const [key, value2] of Object.entries(h ?? {}))
+    if (!WRITER_KEYS.includes(key))
+      Object.defineProperty(out, key, {
+        value: value2,
+        enumerable: true,
+        writable: true,
+        configurable: true
+      });
+  return out;
+}
+function runVocabulary(base, ...runs) {
+  const names2 = runs.flatMap((h) => {
+    const list = h?.["inverse_knobs"];
+    return Array.isArray(list) ? list.filter((x2) => typeof x2 === "string") : [];
+  });
+  if (names2.length === 0) return base;
+  const map = new Map(base);
+  for (const name of names2) {
+    const r = resolveKnob(name, base);
+    const spec = r.status === "built-in" || r.status === "config" ? { ...r.spec, inverse: true } : { role: "regularization", inverse: true, domain: "positive", scale: "log" };
+    map.set(normaliseName(name), { kind: "knob", origin: "built-in", spec });
+  }
+  return map;
+}
+function regularizationKnob(h, vocabulary) {
+  const params = knobValues(h);
+  const curveKnobs = h?.["curve_knobs"];
+  const named = isRecord(curveKnobs) ? curveKnobs["regularization"] : void 0;
+  const of = (key) => {
+    const value2 = params[key];
+    if (typeof value2 !== "number" || !Number.isFinite(value2)) return void 0;
+    const r = resolveKnob(key, vocabulary);
+    const inverse = (r.status === "built-in" || r.status === "config") && r.spec.inverse;
+    return { key, value: value2, inverse };
+  };
+  if (typeof named === "string" && Object.hasOwn(params, named)) return of(named);
+  for (const key of Object.keys(params)) {
+    const r = resolveKnob(key, vocabulary);
+    if (r.status !== "built-in" && r.status !== "config") continue;
+    if (r.spec.role !== "regularization" || r.spec.domain === "fraction") continue;
+    const knob = of(key);
+    if (knob !== void 0) return knob;
+  }
+  return void 0;
+}
+function runRoles(h, vocabulary) {
+  const roles = /* @__PURE__ */ new Set();
+  for (const key of Object.keys(knobValues(h))) {
+    const r = resolveKnob(key, vocabulary);
+    if (r.status === "built-in" || r.status === "config") roles.add(r.spec.role);
+  }
+  return roles;
+}
+function specOf2(key, vocabulary) {
+  const r = resolveKnob(key, vocabulary);
+  return r.status === "built-in" || r.status === "config" ? r.spec : null;
+}
+
 // src/analysis/levers/scores.ts
+var REPEAT_FIRST = 110;
 var REVERSE_OWN_CHANGE = 100;
 var COUNTER_WITH_SWEEP = 95;
 var STEP_BACK_CAPACITY = 90;
@@ -49174,6 +49733,7 @@ var SECOND_TARGET_STEP = 20;
 var CATALOGUE_STEP = 2;
 var GAP_CLOSING_BONUS = 8;
 var GAP_FLAT_PENALTY = 25;
+var PROJECTION_INCLUDES_TODAY_PENALTY = 25;
 var SWEEP_AGREES_BONUS = 10;
 var SWEEP_DISAGREES_PENALTY = 20;
 var EPOCH_CONFIRMED_BONUS = 12;
@@ -49188,87 +49748,153 @@ var SUPPLY_REFERENCE = 20;
 var ADD_REPEATS = 15;
 
 // src/analysis/levers/own-change.ts
-var CAPACITY_LEVERS = /* @__PURE__ */ new Set([
-  "richer-features",
+var UNDO = {
+  "more-regularization": "weaker-regularization",
+  "less-regularization": "stronger-regularization",
+  "more-capacity": "smaller-model",
+  "less-capacity": "bigger-model",
+  "more-features": "fewer-features",
+  "fewer-features": "more-features",
+  "higher-degree": "fewer-features",
+  "lower-degree": "richer-features",
+  "more-data": null,
+  "less-data": "more-data",
+  "longer-training": "early-stopping",
+  "shorter-training": "train-longer",
+  "later-stopping": "early-stopping",
+  "earlier-stopping": "train-longer",
+  "larger-steps": null,
+  "smaller-steps": null
+};
+var PULLS = {
+  "more-regularization": "stronger-regularization",
+  "less-regularization": "weaker-regularization",
+  "more-capacity": "bigger-model",
+  "less-capacity": "smaller-model",
+  "more-features": "more-features",
+  "fewer-features": "fewer-features",
+  "higher-degree": "richer-features",
+  "lower-degree": "fewer-features",
+  "more-data": "more-data",
+  "less-data": null,
+  "longer-training": "train-longer",
+  "shorter-training": "early-stopping",
+  "later-stopping": "train-longer",
+  "earlier-stopping": "early-stopping",
+  "larger-steps": null,
+  "smaller-steps": null
+};
+var ADDS_CAPACITY = /* @__PURE__ */ new Set([
+  "more-capacity",
   "more-features",
-  "bigger-model"
+  "higher-degree"
 ]);
-function numericChange(p) {
-  return {
-    hyperparameter: p.change.key,
-    from: Number(p.change.baseline),
-    to: Number(p.change.candidate),
-    direction: p.change.kind === "lowered" ? "lowered" : "raised"
-  };
-}
-function ownChangeLevers(ctx, curves, drafts) {
+function isSuspect(pull, ctx) {
+  if (pull === null) return false;
   const towardBias = ctx.movement === "toward-underfitting" || ctx.movement === "worse-on-both";
   const towardVariance = ctx.movement === "toward-overfitting" || ctx.movement === "worse-on-both";
-  const biasChange = {
-    kind: "component-change",
-    component: "bias",
-    delta: ctx.bias
+  if (pull === "toward-underfitting") return towardBias;
+  return towardVariance && pull !== "less-variance";
+}
+var DECIMAL2 = /^[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?$/;
+function num(v) {
+  if (typeof v === "number") return Number.isFinite(v) ? v : null;
+  if (typeof v === "string" && DECIMAL2.test(v.trim())) return Number(v.trim());
+  return null;
+}
+function comparedValues(c) {
+  if (c.totalUnits !== void 0) return { from: c.totalUnits.from, to: c.totalUnits.to };
+  const from = c.unlimited === "from" ? null : num(c.from);
+  const to = c.unlimited === "to" ? null : num(c.to);
+  if (from === null && c.unlimited !== "from" || to === null && c.unlimited !== "to")
+    return null;
+  return { from, to };
+}
+function changeEvidence(c) {
+  const v = comparedValues(c);
+  if (v === null || c.role === null || c.effect === null) return null;
+  if (c.direction !== "raised" && c.direction !== "lowered") return null;
+  return {
+    kind: "pr-change",
+    hyperparameter: c.hyperparameter,
+    from: v.from,
+    to: v.to,
+    direction: c.direction,
+    role: c.role,
+    effect: c.effect,
+    ...c.totalUnits === void 0 ? {} : { totalUnits: true }
   };
-  const varianceChange = {
-    kind: "component-change",
-    component: "variance",
-    delta: ctx.variance
-  };
-  for (const p of ctx.pulled) {
-    const { baseline: from, candidate: to, key } = p.change;
-    if (typeof from !== "number" || typeof to !== "number") continue;
-    const change2 = { kind: "pr-change", ...numericChange(p) };
-    const midway = {
-      hyperparameter: key,
-      value: between(from, to),
-      basis: "between-old-and-new"
-    };
-    if (p.lever === "stronger-regularization" && towardBias) {
-      drafts.add("weaker-regularization", REVERSE_OWN_CHANGE, [change2, biasChange], midway);
-    }
-    if (p.lever === "weaker-regularization" && towardVariance) {
-      drafts.add("stronger-regularization", REVERSE_OWN_CHANGE, [change2, varianceChange], midway);
-    }
-    if (CAPACITY_LEVERS.has(p.lever) && towardVariance) {
-      const back = p.lever === "bigger-model" ? "smaller-model" : "fewer-features";
-      drafts.add(back, STEP_BACK_CAPACITY, [change2, varianceChange], midway);
-      counterCapacity(ctx, curves, drafts, [change2, varianceChange]);
-    }
+}
+function stepBack(c, spec) {
+  if (spec.role === "learning-rate" || spec.role === "inert") return void 0;
+  const v = comparedValues(c);
+  if (v === null) return void 0;
+  const totalUnits = c.totalUnits === void 0 ? {} : { totalUnits: true };
+  const finite = v.from ?? v.to;
+  if (finite === null) return void 0;
+  const integer = isIntegerKnob(spec, [finite]);
+  if (v.from === null || v.to === null) {
+    const value3 = roundSuggestion(Math.max(finite * 2, integer ? finite + 1 : finite), {
+      integer
+    });
+    return { hyperparameter: c.hyperparameter, value: value3, basis: "finite-limit", ...totalUnits };
   }
+  const value2 = between(v.from, v.to, {
+    scale: spec.scale,
+    integer: isIntegerKnob(spec, [v.from, v.to])
+  });
+  return value2 === null ? { hyperparameter: c.hyperparameter, value: v.from, basis: "back-to-baseline", ...totalUnits } : { hyperparameter: c.hyperparameter, value: value2, basis: "between-old-and-new", ...totalUnits };
+}
+function ownChangeLevers(ctx, curves, drafts) {
+  const counters = [];
+  const drafted = /* @__PURE__ */ new Set();
+  for (const c of ctx.changes) {
+    if (c.effect === null || !isSuspect(c.pull, ctx)) continue;
+    const id = UNDO[c.effect];
+    const spec = specOf2(c.hyperparameter, ctx.vocabulary);
+    const change3 = changeEvidence(c);
+    if (id === null || spec === null || change3 === null) continue;
+    const moved = {
+      kind: "component-change",
+      component: c.pull === "toward-underfitting" ? "bias" : "variance",
+      delta: c.pull === "toward-underfitting" ? ctx.bias : ctx.variance
+    };
+    if (ADDS_CAPACITY.has(c.effect)) counters.push([change3, moved]);
+    const existing = drafts.get(id);
+    if (existing !== void 0 && drafted.has(id)) {
+      existing.evidence.splice(1, 0, change3);
+      continue;
+    }
+    drafted.add(id);
+    let suggestion = stepBack(c, spec);
+    const evidence = [change3, moved];
+    const regularizing = id === "stronger-regularization" || id === "weaker-regularization";
+    if (regularizing && curves.sweep !== null) {
+      const lever = id === "stronger-regularization" ? "stronger" : "weaker";
+      evidence.push(sweepEvidence(curves.sweep, ctx.regularization, lever));
+      const knob = ctx.regularization;
+      if (knob !== void 0 && knob.key === c.hyperparameter && sweepWants(curves.sweep, knob) === lever)
+        suggestion = sweepSuggestion(curves.sweep, knob, lever) ?? suggestion;
+    }
+    drafts.add(id, regularizing ? REVERSE_OWN_CHANGE : STEP_BACK_CAPACITY, evidence, suggestion);
+  }
+  const first = counters[0];
+  if (first !== void 0) counterCapacity(ctx, curves, drafts, first);
 }
 function counterCapacity(ctx, curves, drafts, evidence) {
   const sweep = curves.sweep;
-  if (sweep === null || sweep.side !== "below") {
-    drafts.add("stronger-regularization", COUNTER_WITHOUT_SWEEP, evidence);
+  const knob = ctx.regularization;
+  if (sweep === null || sweepWants(sweep, knob) !== "stronger") {
+    if (ctx.roles.size === 0 || ctx.roles.has("regularization"))
+      drafts.add("stronger-regularization", COUNTER_WITHOUT_SWEEP, evidence);
     return;
   }
-  const key = ctx.regularization?.key;
   drafts.add(
     "stronger-regularization",
     COUNTER_WITH_SWEEP,
-    [
-      ...evidence,
-      {
-        kind: "sweep-minimum",
-        hyperparameter: key ?? null,
-        bestX: sweep.bestX,
-        bestValidation: sweep.bestValidation,
-        current: ctx.regularization?.value ?? null,
-        suggestedX: sweep.suggestedX,
-        side: sweep.side,
-        supports: true,
-        atEdge: sweep.atEdge
-      }
-    ],
-    key === void 0 ? void 0 : sweepSuggestion(key, sweep)
+    [...evidence, sweepEvidence(sweep, knob, "stronger")],
+    knob === void 0 ? void 0 : sweepSuggestion(sweep, knob, "stronger")
   );
-}
-function sweepSuggestion(key, sweep) {
-  return {
-    hyperparameter: key,
-    value: sweep.suggestedX,
-    basis: sweep.atEdge === null ? "sweep-minimum" : "beyond-sweep-edge"
-  };
 }
 
 // src/analysis/levers/diagnosis.ts
@@ -49287,7 +49913,15 @@ function targets(diagnosis, run) {
   }
 }
 function diagnosisLevers(ctx, curves, drafts) {
-  const pulled = new Map(ctx.pulled.map((p) => [p.lever, p]));
+  const pulled = /* @__PURE__ */ new Map();
+  for (const c of ctx.changes) {
+    const id = c.effect === null ? null : PULLS[c.effect];
+    const v = comparedValues(c);
+    if (id === null || v === null || v.from === null || v.to === null || pulled.has(id)) continue;
+    if (c.direction !== "raised" && c.direction !== "lowered") continue;
+    const { hyperparameter, direction } = c;
+    pulled.set(id, { kind: "already-pulled", hyperparameter, from: v.from, to: v.to, direction });
+  }
   targets(ctx.candidate.diagnosis, ctx.candidate).forEach((target, t) => {
     const component = ctx.candidate.components[target];
     const base = component.value === null ? [] : [
@@ -49307,7 +49941,7 @@ function diagnosisLevers(ctx, curves, drafts) {
       const p = pulled.get(id);
       if (p !== void 0) {
         draft.score -= ALREADY_PULLED_PENALTY;
-        draft.evidence.push({ kind: "already-pulled", ...numericChange(p) });
+        draft.evidence.push(p);
       }
       drafts.add(id, draft.score, draft.evidence, draft.suggestion);
     });
@@ -49318,14 +49952,18 @@ function sharpen(id, draft, ctx, curves) {
     const lc = curves.learning;
     const twice = lc.projections[0];
     if (twice !== void 0) {
+      const current = ctx.candidate.splits.find((s) => s.split === "validation")?.mean ?? 0;
+      const includesToday = twice.ci[0] <= current && current <= twice.ci[1];
+      if (includesToday) draft.score -= PROJECTION_INCLUDES_TODAY_PENALTY;
       draft.evidence.push({
         kind: "learning-curve",
         fromX: Math.max(...lc.chart.map((p) => p.x)),
         atX: twice.x,
-        current: ctx.candidate.splits.find((s) => s.split === "validation")?.mean ?? 0,
+        current,
         projected: twice.validation,
         ci: twice.ci,
-        r2: lc.r2
+        r2: lc.r2,
+        includesToday
       });
     }
     if (lc.gapTrend === "flat") {
@@ -49363,25 +50001,63 @@ function sharpen(id, draft, ctx, curves) {
   }
 }
 function sharpenBySweep(id, draft, ctx, sweep) {
-  const wants = id === "stronger-regularization" ? "below" : "above";
-  const supports = sweep.side === "unknown" ? null : sweep.side === wants;
-  if (supports === null && sweep.atEdge === null) return;
-  const key = ctx.regularization?.key;
-  draft.evidence.push({
-    kind: "sweep-minimum",
-    hyperparameter: key ?? null,
-    bestX: sweep.bestX,
-    bestValidation: sweep.bestValidation,
-    current: ctx.regularization?.value ?? null,
-    suggestedX: sweep.suggestedX,
-    side: sweep.side,
-    supports,
-    atEdge: sweep.atEdge
-  });
-  if (supports === true) {
+  const lever = id === "stronger-regularization" ? "stronger" : "weaker";
+  const wants = sweepWants(sweep, ctx.regularization);
+  if (wants === null && sweep.atEdge === null) return;
+  draft.evidence.push(sweepEvidence(sweep, ctx.regularization, lever));
+  if (wants === lever) {
     draft.score += SWEEP_AGREES_BONUS;
-    if (key !== void 0) draft.suggestion = sweepSuggestion(key, sweep);
-  } else if (supports === false) draft.score -= SWEEP_DISAGREES_PENALTY;
+    const knob = ctx.regularization;
+    const suggestion = knob === void 0 ? void 0 : sweepSuggestion(sweep, knob, lever);
+    if (suggestion !== void 0) draft.suggestion = suggestion;
+  } else if (wants !== null) draft.score -= SWEEP_DISAGREES_PENALTY;
+}
+
+// src/analysis/levers/resolve.ts
+var OPPOSITES = [
+  ["stronger-regularization", "weaker-regularization"],
+  ["bigger-model", "smaller-model"],
+  ["train-longer", "early-stopping"],
+  ["more-features", "fewer-features"],
+  ["richer-features", "fewer-features"]
+];
+var NEEDS = {
+  "bigger-model": ["capacity"],
+  "smaller-model": ["capacity"],
+  "more-features": ["features", "polynomial-degree"],
+  "fewer-features": ["features", "polynomial-degree"],
+  "richer-features": ["features", "polynomial-degree"],
+  "weaker-regularization": ["regularization"],
+  "train-longer": ["epochs", "early-stopping-patience"],
+  "early-stopping": ["epochs", "early-stopping-patience"]
+};
+function ruledOut(lever, roles) {
+  const own = lever.evidence.some((e) => e.kind === "pr-change");
+  for (const e of lever.evidence) {
+    if (e.kind === "sweep-minimum" && e.supports === false) return true;
+    if (e.kind === "epoch-curve-silent" && e.curve) return true;
+  }
+  const measured = lever.evidence.some(
+    (e) => e.kind === "sweep-minimum" || e.kind === "epoch-minimum" || e.kind === "still-improving"
+  );
+  const needs = NEEDS[lever.id];
+  if (own || measured || needs === void 0 || roles.size === 0) return false;
+  return !needs.some((r) => roles.has(r));
+}
+function resolveLevers(drafted, roles, tieBreak = () => 0) {
+  const ranked = [...drafted].sort((a, b) => b.score - a.score || tieBreak(a, b));
+  const kept = [];
+  const taken = /* @__PURE__ */ new Set();
+  for (const lever of ranked) {
+    if (ruledOut(lever, roles)) continue;
+    const opposite = OPPOSITES.some(
+      ([a, b]) => a === lever.id && taken.has(b) || b === lever.id && taken.has(a)
+    );
+    if (opposite) continue;
+    kept.push(lever);
+    taken.add(lever.id);
+  }
+  return kept;
 }
 
 // src/analysis/levers/secondary.ts
@@ -49425,24 +50101,188 @@ function secondaryLevers(ctx, curves, drafts) {
   if (candidate.biasUnknown) {
     drafts.add("supply-reference", SUPPLY_REFERENCE, [{ kind: "reference-missing" }]);
   }
+  if (ctx.undetermined !== void 0) {
+    drafts.add("repeat-with-seeds", REPEAT_FIRST, [
+      { kind: "change-undetermined", repeatsNeeded: ctx.undetermined.repeatsNeeded }
+    ]);
+  }
   if (ctx.noiseUnknown) {
     drafts.add("add-repeats", ADD_REPEATS, [{ kind: "noise-unknown" }]);
   }
 }
 
 // src/analysis/levers/choose.ts
-function chooseLevers(ctx) {
+function chooseLevers(ctx, tieBreak) {
   const curves = curveEvidence(ctx.candidate.curves);
   const drafts = new Drafts();
   ownChangeLevers(ctx, curves, drafts);
   diagnosisLevers(ctx, curves, drafts);
   secondaryLevers(ctx, curves, drafts);
-  return { levers: drafts.ranked(), nonLevers: nonLevers(ctx) };
+  return { levers: resolveLevers(drafts.ranked(), ctx.roles, tieBreak), nonLevers: nonLevers(ctx) };
 }
 function nonLevers(ctx) {
   const biased = ctx.candidate.diagnosis === "high-bias" || ctx.candidate.diagnosis === "high-bias-and-variance";
-  const shrank = ctx.changes.some((c) => c.kind === "lowered" && knobOf(c.key) === "data");
+  const shrank = ctx.changes.some((c) => c.effect === "less-data");
   return biased || shrank ? ["smaller-training-set"] : [];
+}
+
+// src/analysis/levers/pr-changes.ts
+var MAX_DEPTH = 8;
+var EFFECTS = {
+  regularization: ["more-regularization", "less-regularization"],
+  capacity: ["more-capacity", "less-capacity"],
+  features: ["more-features", "fewer-features"],
+  "polynomial-degree": ["higher-degree", "lower-degree"],
+  "data-size": ["more-data", "less-data"],
+  epochs: ["longer-training", "shorter-training"],
+  "early-stopping-patience": ["later-stopping", "earlier-stopping"],
+  "learning-rate": ["larger-steps", "smaller-steps"]
+};
+function effectOf(role, inverse, direction) {
+  if (role === null || role === "inert") return null;
+  if (direction !== "raised" && direction !== "lowered") return null;
+  const [up, down] = EFFECTS[role];
+  return direction === "raised" !== inverse ? up : down;
+}
+var PULLS2 = {
+  "more-regularization": "toward-underfitting",
+  "less-regularization": "toward-overfitting",
+  "more-capacity": "toward-overfitting",
+  "less-capacity": "toward-underfitting",
+  "more-features": "toward-overfitting",
+  "fewer-features": "toward-underfitting",
+  "higher-degree": "toward-overfitting",
+  "lower-degree": "toward-underfitting",
+  "more-data": "less-variance",
+  "less-data": "more-variance",
+  "longer-training": "toward-overfitting",
+  "shorter-training": "toward-underfitting",
+  "later-stopping": "toward-overfitting",
+  "earlier-stopping": "toward-underfitting",
+  "larger-steps": null,
+  "smaller-steps": null
+};
+function pullOf(effect) {
+  return effect === null ? null : PULLS2[effect];
+}
+function isPlainObject(v) {
+  return typeof v === "object" && v !== null && !Array.isArray(v);
+}
+function toJson(v) {
+  if (v === null || typeof v === "boolean" || typeof v === "string") return v;
+  if (typeof v === "number") return Number.isFinite(v) ? v : null;
+  if (Array.isArray(v)) return v.map(toJson);
+  if (isPlainObject(v)) {
+    const out = {};
+    for (const [k, x2] of Object.entries(v))
+      Object.defineProperty(out, k, {
+        value: toJson(x2),
+        enumerable: true,
+        writable: true,
+        configurable: true
+      });
+    return out;
+  }
+  return null;
+}
+function flatten(params) {
+  const nested = /* @__PURE__ */ new Map();
+  const walk = (obj, prefix, depth) => {
+    for (const [key, value2] of Object.entries(obj)) {
+      const path = `${prefix}.${key}`;
+      if (isPlainObject(value2) && depth < MAX_DEPTH && Object.keys(value2).length > 0)
+        walk(value2, path, depth + 1);
+      else nested.set(path, value2);
+    }
+  };
+  const literal = /* @__PURE__ */ new Map();
+  for (const [key, value2] of Object.entries(params)) {
+    if (isPlainObject(value2) && Object.keys(value2).length > 0) walk(value2, key, 1);
+    else literal.set(key, value2);
+  }
+  return new Map([...nested, ...literal]);
+}
+var DECIMAL3 = /^[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?$/;
+function asNumber(v) {
+  if (typeof v === "number") return Number.isFinite(v) ? v : null;
+  if (typeof v === "string" && DECIMAL3.test(v.trim())) {
+    const n = Number(v.trim());
+    return Number.isFinite(n) ? n : null;
+  }
+  return null;
+}
+function canonical(v) {
+  if (Array.isArray(v)) return `[${v.map(canonical).join(",")}]`;
+  if (isPlainObject(v))
+    return `{${Object.keys(v).sort().map((k) => `${JSON.stringify(k)}:${canonical(v[k])}`).join(",")}}`;
+  return JSON.stringify(toJson(v));
+}
+function measure(v, resolution) {
+  const spec = resolution.status === "built-in" || resolution.status === "config" ? resolution.spec : null;
+  if (spec?.unlimited !== void 0) {
+    const n2 = asNumber(v);
+    if (v === null || spec.unlimited === "null-or-non-positive" && n2 !== null && n2 <= 0)
+      return { value: Infinity, unlimited: true, units: false };
+  }
+  if (spec?.domain === "units" && Array.isArray(v)) {
+    let total = 0;
+    for (const x2 of v) {
+      const n2 = asNumber(x2);
+      if (n2 === null) return null;
+      total += n2;
+    }
+    return { value: total, unlimited: false, units: true };
+  }
+  const n = asNumber(v);
+  return n === null ? null : { value: n, unlimited: false, units: false };
+}
+function change2(key, inB, b, inC, c, vocabulary) {
+  const resolution = resolveKnob(key, vocabulary);
+  const known = resolution.status === "built-in" || resolution.status === "config";
+  const role = known ? resolution.spec.role : null;
+  const inverse = known ? resolution.spec.inverse : false;
+  const base = {
+    hyperparameter: key,
+    role,
+    inverse,
+    origin: resolution.status,
+    ...inB ? { from: toJson(b) } : {},
+    ...inC ? { to: toJson(c) } : {}
+  };
+  const direction = (d) => {
+    const effect = effectOf(role, inverse, d);
+    return { ...base, direction: d, effect, pull: pullOf(effect) };
+  };
+  if (!inB) return direction("added");
+  if (!inC) return direction("removed");
+  const mb = measure(b, resolution);
+  const mc = measure(c, resolution);
+  if (mb === null || mc === null)
+    return canonical(b) === canonical(c) ? null : direction("changed");
+  if (known && resolution.spec.domain === "count-or-fraction" && mb.value < 1 !== mc.value < 1)
+    return direction("changed");
+  if (mb.value === mc.value) {
+    const reshaped = (mb.units || mc.units) && canonical(b) !== canonical(c);
+    return reshaped ? direction("changed") : null;
+  }
+  const out = direction(mc.value > mb.value ? "raised" : "lowered");
+  if (mb.value > 0 && mc.value > 0 && Number.isFinite(mb.value) && Number.isFinite(mc.value))
+    out.ratio = mc.value / mb.value;
+  if (mb.units || mc.units) out.totalUnits = { from: mb.value, to: mc.value };
+  if (mb.unlimited) out.unlimited = "from";
+  else if (mc.unlimited) out.unlimited = "to";
+  return out;
+}
+function prChanges(baseline, candidate, vocabulary = BUILT_IN_VOCABULARY) {
+  const b = flatten(baseline ?? {});
+  const c = flatten(candidate ?? {});
+  const keys = [.../* @__PURE__ */ new Set([...b.keys(), ...c.keys()])].sort();
+  const out = [];
+  for (const key of keys) {
+    const x2 = change2(key, b.has(key), b.get(key), c.has(key), c.get(key), vocabulary);
+    if (x2 !== null) out.push(x2);
+  }
+  return out;
 }
 
 // src/analysis/movement.ts
@@ -49613,10 +50453,10 @@ function gapTrend(points) {
   if (Math.abs(meanGap) <= RELATIVE_CHANGE * Math.abs(meanV)) {
     return { trend: "flat", changePerDoubling: meanGap !== 0 ? sxy / sxx / Math.abs(meanGap) : 0 };
   }
-  const change2 = sxy / sxx / Math.abs(meanGap);
-  if (change2 <= -RELATIVE_CHANGE) return { trend: "closing", changePerDoubling: change2 };
-  if (change2 < RELATIVE_CHANGE) return { trend: "flat", changePerDoubling: change2 };
-  return { trend: "unknown", changePerDoubling: change2 };
+  const change3 = sxy / sxx / Math.abs(meanGap);
+  if (change3 <= -RELATIVE_CHANGE) return { trend: "closing", changePerDoubling: change3 };
+  if (change3 < RELATIVE_CHANGE) return { trend: "flat", changePerDoubling: change3 };
+  return { trend: "unknown", changePerDoubling: change3 };
 }
 
 // src/analysis/curves/lttb.ts
@@ -49959,16 +50799,16 @@ function verdict(problem, p, state, iterations, stop, lower, upper, evaluate, ja
       q[j] = Math.min(Math.max(v, lower[j]), upper[j]);
       return evaluate(q).rss;
     };
-    const change2 = Math.max(
+    const change3 = Math.max(
       Math.abs(probe(pj + h) - state.rss),
       Math.abs(probe(pj - h) - state.rss)
     );
-    return !(change2 > 1e-12 * state.rss);
+    return !(change3 > 1e-12 * state.rss);
   });
-  const scaled = jac.map(
+  const scaled2 = jac.map(
     (row) => free.map((j) => norms[j] > 0 ? row[j] / norms[j] : 0)
   );
-  const qr = free.length > 0 && n >= free.length ? qrLeastSquares(scaled, state.r) : null;
+  const qr = free.length > 0 && n >= free.length ? qrLeastSquares(scaled2, state.r) : null;
   let relativeOffset = null;
   if (qr && dof > 0) {
     const q1 = Math.hypot(...qr.qtb.slice(0, free.length));
@@ -50097,8 +50937,8 @@ function fullCovariance(jac, rss) {
   if (dof <= 0) return null;
   const norms = Array.from({ length: p }, (_, j) => Math.hypot(...jac.map((row) => row[j] ?? 0)));
   if (norms.some((v) => !(v > 0) || !Number.isFinite(v))) return null;
-  const scaled = jac.map((row) => row.map((v, j) => v / norms[j]));
-  const inverse = inverseOfRtR(qrLeastSquares(scaled, new Array(n).fill(0)).r);
+  const scaled2 = jac.map((row) => row.map((v, j) => v / norms[j]));
+  const inverse = inverseOfRtR(qrLeastSquares(scaled2, new Array(n).fill(0)).r);
   if (!inverse) return null;
   const s2 = rss / dof;
   const covariance = inverse.map(
@@ -50160,10 +51000,10 @@ function regularizationMinimum(x2, validationError, lambda) {
     const [x0, x1, x22] = [lx[i2 - 1], lx[i2], lx[i2 + 1]];
     const [y0, y1, y2] = [validationError[i2 - 1], validationError[i2], validationError[i2 + 1]];
     step = (x22 - x0) / 2;
-    const num = (x1 - x0) ** 2 * (y1 - y2) - (x1 - x22) ** 2 * (y1 - y0);
+    const num2 = (x1 - x0) ** 2 * (y1 - y2) - (x1 - x22) ** 2 * (y1 - y0);
     const den = (x1 - x0) * (y1 - y2) - (x1 - x22) * (y1 - y0);
     if (den !== 0) {
-      logBest = x1 - num / (2 * den);
+      logBest = x1 - num2 / (2 * den);
       refined = true;
     }
     suggestedX = Math.exp(logBest);
@@ -50315,13 +51155,6 @@ function splitSummary(run, split, alpha, examples) {
   }
   return { split, mean: m, sd, repeats: n, examples: s.examples ?? null, ci };
 }
-function regularizationOf(run) {
-  for (const [key, value2] of Object.entries(run.hyperparameters ?? {})) {
-    if (typeof value2 === "number" && knobOf(key) === "regularization" && !/dropout/i.test(key))
-      return { key, value: value2 };
-  }
-  return void 0;
-}
 function belowReference(bias, alpha) {
   if (bias.value === null || !(bias.value < 0)) return false;
   return bias.p === null || 1 - bias.p < alpha;
@@ -50329,7 +51162,10 @@ function belowReference(bias, alpha) {
 function summarize(run, settings, examples = {}) {
   const reference = settings.referenceChoice ?? chooseReference(run, settings.reference);
   const components = decompose(run, reference.value, settings, examples);
-  const lambda = regularizationOf(run)?.value;
+  const lambda = regularizationKnob(
+    run.hyperparameters,
+    settings.vocabulary ?? BUILT_IN_VOCABULARY
+  )?.value;
   return {
     name: run.run.name,
     commit: run.run.commit ?? null,
@@ -50379,7 +51215,7 @@ function compareSlices(baseline, candidate, aggregate, settings) {
   const slices2 = pairs.map(({ b, c, test: test2 }, i2) => {
     const pAdjusted = adjusted[i2] ?? null;
     const call = callOf({ ...test2, p: pAdjusted }, settings);
-    const change2 = call === "flat" ? "flat" : call === "up" === (sign === 1) ? "worse" : "better";
+    const change3 = call === "flat" ? "flat" : call === "up" === (sign === 1) ? "worse" : "better";
     return {
       name: c.name,
       examples: c.examples ?? null,
@@ -50387,8 +51223,8 @@ function compareSlices(baseline, candidate, aggregate, settings) {
       candidate: c.validation,
       delta: toMetricDelta(test2, settings),
       pAdjusted,
-      change: change2,
-      hiddenRegression: change2 === "worse" && aggregate === "better"
+      change: change3,
+      hiddenRegression: change3 === "worse" && aggregate === "better"
     };
   });
   return { slices: slices2, unpaired };
@@ -50423,7 +51259,16 @@ function buildReview(input) {
   const settings = reviewSettings(input.settings);
   const calls = { alpha: settings.alpha, minEffect: settings.minEffect };
   const reference = input.settings.reference;
-  const summarySettings = { ...settings, ...reference === void 0 ? {} : { reference } };
+  const vocabulary = runVocabulary(
+    mergeRoles(BUILT_IN_VOCABULARY, input.settings.hyperparameters),
+    baseline.hyperparameters,
+    candidate.hyperparameters
+  );
+  const summarySettings = {
+    ...settings,
+    vocabulary,
+    ...reference === void 0 ? {} : { reference }
+  };
   const runs = { baseline, candidate };
   const task = taskReference(baseline, candidate, reference);
   const examples = exampleNoise(runs, input.paired);
@@ -50449,16 +51294,20 @@ function buildReview(input) {
     examples
   );
   const movement = movementOf(components.bias?.call ?? "flat", components.variance.call);
-  const change2 = validationChangeOf(toShortfallDelta(validationShortfall, calls).call);
+  const change3 = validationChangeOf(toShortfallDelta(validationShortfall, calls).call);
   const validation = {
-    change: change2,
+    change: change3,
     delta: toMetricDelta(toMetricUnits(validationShortfall, shortfallSign(candidate)), calls),
-    ...change2 === "flat" || change2 === "undetermined" ? validationPower(runs, validationShortfall, settings.alpha, examples) : {}
+    ...change3 === "flat" || change3 === "undetermined" ? validationPower(runs, validationShortfall, settings.alpha, examples) : {}
   };
   const pairedDecided = paired !== void 0 && paired.rows > 0 && (validationShortfall.test === "mcnemar-exact" || validationShortfall.test === "paired-t");
   const sliceResult = compareSlices(baseline, candidate, validation.change, calls);
   const noiseUnknown = validation.delta.test === "none" || components.variance.test === "none";
-  const changes = diffHyperparameters(baseline.hyperparameters, candidate.hyperparameters);
+  const changes = prChanges(
+    knobValues(baseline.hyperparameters),
+    knobValues(candidate.hyperparameters),
+    vocabulary
+  );
   const { levers, nonLevers: nonLevers2 } = chooseLevers({
     goal: candidate.metric.goal,
     candidate: cand,
@@ -50466,10 +51315,12 @@ function buildReview(input) {
     movement,
     bias: components.bias ?? NO_BIAS_CHANGE,
     variance: components.variance,
-    pulled: pulledLevers(changes),
     changes,
-    regularization: regularizationOf(candidate),
-    noiseUnknown
+    vocabulary,
+    roles: runRoles(candidate.hyperparameters, vocabulary),
+    regularization: regularizationKnob(candidate.hyperparameters, vocabulary),
+    noiseUnknown,
+    ...undeterminedOf(validation)
   });
   const hasGuardrails = baseline.guardrails !== void 0 || candidate.guardrails !== void 0;
   const guardrails = hasGuardrails ? reviewGuardrails(baseline, candidate, {
@@ -50502,7 +51353,7 @@ function buildReview(input) {
     baseline: base,
     candidate: cand,
     slices: sliceResult.slices,
-    hyperparameters: changes,
+    hyperparameters: changes.map(hyperparameterChange),
     levers,
     nonLevers: nonLevers2,
     gate,
@@ -50519,7 +51370,8 @@ function buildReview(input) {
         paired: input.paired,
         task,
         repeatsDecided: paired !== void 0 && paired.rows > 0 && repeatsDecide(runs, paired.split ?? "validation"),
-        examples
+        examples,
+        changes
       })
     ],
     paired: pairedSummary(input.paired, pairedDecided, runs)
@@ -50540,6 +51392,19 @@ function reviewNotes(facts) {
     });
   }
   if (facts.repeatsDecided) notes.push({ code: "repeats-decided" });
+  const unmapped = facts.changes.filter((c) => c.origin === "unknown" || c.origin === "ambiguous");
+  if (unmapped.length > 0) {
+    notes.push({
+      code: "unmapped-hyperparameters",
+      count: unmapped.length,
+      changes: unmapped.slice(0, NOTE_NAMES).map((c) => ({
+        key: c.hyperparameter,
+        ambiguous: c.origin === "ambiguous",
+        baseline: c.from ?? null,
+        candidate: c.to ?? null
+      }))
+    });
+  }
   if (facts.components.varianceFallback) notes.push({ code: "train-dev-in-one-run" });
   if (facts.unpaired.length > 0) {
     notes.push({
@@ -50561,6 +51426,25 @@ function reviewNotes(facts) {
   if (facts.paired !== void 0 && facts.paired.rows === 0 && facts.paired.partial !== true)
     notes.push({ code: "predictions-share-no-id" });
   return notes;
+}
+function undeterminedOf(validation) {
+  if (validation.change !== "undetermined") return {};
+  return { undetermined: { repeatsNeeded: validation.repeatsNeeded?.repeats ?? null } };
+}
+function hyperparameterChange(c) {
+  return {
+    key: c.hyperparameter,
+    baseline: c.from ?? null,
+    candidate: c.to ?? null,
+    kind: c.direction,
+    role: c.role,
+    inverse: c.inverse,
+    origin: c.origin,
+    effect: c.effect,
+    ...c.ratio === void 0 ? {} : { ratio: c.ratio },
+    ...c.totalUnits === void 0 ? {} : { totalUnits: true },
+    ...c.unlimited === void 0 ? {} : { unlimited: c.unlimited === "from" ? "baseline" : "candidate" }
+  };
 }
 function pairedSummary(paired, decided, runs) {
   if (paired === void 0) return null;
@@ -51025,8 +51909,24 @@ function lineOf(text2, offset) {
   for (let i2 = 0; i2 < offset && i2 < text2.length; i2++) if (text2.charCodeAt(i2) === 10) line++;
   return line;
 }
+function roleConflictIssues(map, file) {
+  if (map === void 0) return [];
+  return configRoleConflicts(map).map((group) => ({
+    file,
+    pointer: `/hyperparameters/${escapePointer(group[group.length - 1] ?? "")}`,
+    expected: `one entry per hyperparameter name (names match up to case, '-' and '_')`,
+    got: group.map(quote).join(", "),
+    hint: "Keep one of these entries."
+  }));
+}
+function escapePointer(key) {
+  return key.replace(/~/g, "~0").replace(/\//g, "~1");
+}
 function parseConfig(text2, file) {
-  return checkSettings(parseRaw(text2, file), file);
+  const config = checkSettings(parseRaw(text2, file), file);
+  const conflicts = roleConflictIssues(config.hyperparameters, file);
+  if (conflicts.length > 0) throw new InputError(conflicts);
+  return config;
 }
 var NUMBER_KEYS = ["alpha", "min-effect", "gap-tolerance", "reference"];
 var SETTING_KEYS = /* @__PURE__ */ new Set([...NUMBER_KEYS, "fail-on"]);
@@ -51179,7 +52079,8 @@ function resolveSettings(config, overrides = {}) {
       guardrailMargins: new Map(
         Object.entries(config.guardrails).map(([name, g]) => [name, g.margin])
       )
-    }
+    },
+    ...config.hyperparameters === void 0 ? {} : { hyperparameters: config.hyperparameters }
   };
 }
 function sameMetric(baseline, candidate) {
@@ -52001,12 +52902,12 @@ function guardrailsTable(review2, esc, level, compact = false) {
       guardrailVerdict(g, esc, margin)
     ]);
   }
-  for (const [field, words2] of COST_WORDS) {
+  for (const [field, words3] of COST_WORDS) {
     const c = review2.cost?.[field];
     if (c === void 0) continue;
     const interval = c.ci === null ? "" : ` [${fixed(c.ci[0], 2)}, ${fixed(c.ci[1], 2)}]`;
     rows.push([
-      words2.noun,
+      words3.noun,
       costCell(c.baseline, field),
       costCell(c.candidate, field),
       `${ratio(c.ratio)}${interval}`,
@@ -52034,7 +52935,7 @@ function tradeOffPhrase(review2, esc) {
   });
   if (moved.length === 0) return null;
   const f = numberFormatFor(review2);
-  const costs = moved.map(([field, words2]) => `${ratio(review2.cost?.[field]?.ratio ?? 1)} ${words2.noun}`).join(" and ");
+  const costs = moved.map(([field, words3]) => `${ratio(review2.cost?.[field]?.ratio ?? 1)} ${words3.noun}`).join(" and ");
   const metric = esc(review2.metric.name, 60);
   const gain = review2.validation.change === "better" || review2.validation.change === "worse" ? `${change(review2.validation.delta.estimate, f)} ${metric}` : review2.validation.change === "flat" ? `${metric} unchanged within noise` : `a ${metric} change that cannot be told from noise yet`;
   return `${gain} for ${costs}`;
@@ -52050,8 +52951,17 @@ function leverText(lever, review2, f, esc) {
   if (lever.suggestion !== void 0) sentences.push(suggestionSentence(lever.suggestion, ctx));
   return { title: say(LEVER_TITLE, lever.id, esc), sentences };
 }
+function leverHeadline(lever, review2, f, esc) {
+  const ctx = { review: review2, f, esc };
+  const title = say(LEVER_TITLE, lever.id, esc);
+  if (lever.suggestion !== void 0)
+    return { title, sentences: [suggestionSentence(lever.suggestion, ctx)] };
+  const first = lever.evidence.flatMap((e) => evidenceSentence(e, lever.id, ctx) ?? [])[0];
+  return { title, sentences: first === void 0 ? [] : [first] };
+}
 function fromTo(e) {
-  return `${short(e.from)} \u2192 ${short(e.to)}`;
+  const v = (x2) => x2 === null ? "no limit" : short(x2);
+  return `${v(e.from)} \u2192 ${v(e.to)}`;
 }
 function evidenceSentence(e, id, ctx) {
   const { f, esc, review: review2 } = ctx;
@@ -52063,8 +52973,10 @@ function evidenceSentence(e, id, ctx) {
       if (e.component === "overfit")
         return `Test error exceeds validation error by ${amount(e.value, f)}: model choices may be tuned to the validation set; enlarge or refresh it.`;
       return `The candidate has high ${say(COMPONENT_WORD, e.component, esc)}: ${amount(e.value, f)} against a validation error of ${value(e.errorLevel, f)}.`;
-    case "pr-change":
-      return `This PR ${e.direction === "raised" ? "raised" : "lowered"} ${esc(e.hyperparameter, 60)} ${fromTo(e)}.`;
+    case "pr-change": {
+      const units = e.totalUnits === true ? " hidden units in total" : "";
+      return `This PR ${e.direction === "raised" ? "raised" : "lowered"} ${esc(e.hyperparameter, 60)} ${fromTo(e)}${units}: ${say(EFFECT_WORD, e.effect, esc)}.`;
+    }
     case "component-change": {
       const word2 = e.delta.call === "up" ? "rose" : e.delta.call === "down" ? "fell" : "held steady";
       const toward = e.delta.call !== "up" ? "" : e.component === "bias" ? ": the model moved toward underfitting" : ": the model moved toward overfitting";
@@ -52075,6 +52987,8 @@ function evidenceSentence(e, id, ctx) {
     case "sweep-minimum":
       return sweepSentence(e, ctx);
     case "learning-curve": {
+      if (e.includesToday)
+        return `More data is unlikely to help measurably: at ${count(e.atX)} training examples the power-law fit projects validation ${metric} ${value(e.projected, f)}, with an interval (${valueRange(e.ci, f)}) that includes today's ${value(e.current, f)}.`;
       const times = e.fromX > 0 ? ` (${short(e.atX / e.fromX)}\xD7 the largest on the curve)` : "";
       return `At ${count(e.atX)} training examples${times} the power-law fit (R\xB2 ${fixed(e.r2, 2)}) projects validation ${metric} ${value(e.current, f)} \u2192 ${value(e.projected, f)} (${valueRange(e.ci, f)}).`;
     }
@@ -52091,6 +53005,8 @@ function evidenceSentence(e, id, ctx) {
       return "Bias is unknown without a reference level: add `reference` (human-level error, a prior system, or an estimated Bayes error) to the artifacts or the config.";
     case "noise-unknown":
       return "Run-to-run noise is unknown: train with 2 or more seeds (or ship per-example predictions) so changes can be tested.";
+    case "change-undetermined":
+      return e.repeatsNeeded === null ? "The validation change is undetermined at this noise: no other lever can be judged yet." : `The validation change is undetermined at this noise: about ${count(e.repeatsNeeded)} repeats (seeds) per run would detect the minimum effect.`;
     default:
       return null;
   }
@@ -52109,9 +53025,51 @@ function sweepSentence(e, ctx) {
     return `The sweep's validation minimum (${at}) lies on the other side of the candidate's strength.${edge}`;
   return `The regularization sweep has its lowest validation (${value(e.bestValidation, f)}) at ${at}.${edge}`;
 }
+var BASIS = {
+  "between-old-and-new": ", between the old and new values",
+  "back-to-baseline": ", the baseline value",
+  "finite-limit": ", a finite limit instead of none",
+  "sweep-minimum": ", the sweep's minimum",
+  "beyond-sweep-edge": ", one grid step beyond the end of the sweep"
+};
 function suggestionSentence(s, ctx) {
-  const basis = s.basis === "between-old-and-new" ? ", between the old and new values" : s.basis === "sweep-minimum" ? ", the sweep's minimum" : ", one grid step beyond the end of the sweep";
-  return `Try ${ctx.esc(s.hyperparameter, 60)} \u2248 ${short(s.value)}${basis}.`;
+  const basis = BASIS[s.basis] ?? "";
+  const units = s.totalUnits === true ? " hidden units in total" : "";
+  return `Try ${ctx.esc(s.hyperparameter, 60)} \u2248 ${short(s.value)}${units}${basis}.`;
+}
+
+// src/report/pr-summary.ts
+var PR_SUMMARY_CHANGES = 4;
+function valueText(v, esc) {
+  if (typeof v === "number") return short(v);
+  if (v === null) return "no limit";
+  return esc(JSON.stringify(v) ?? String(v), 30);
+}
+function factor(ratio2) {
+  if (ratio2 === void 0 || !Number.isFinite(ratio2) || ratio2 <= 0) return "";
+  const two = (x2) => short(Number(x2.toPrecision(2)));
+  return ratio2 >= 1 ? ` (\xD7${two(ratio2)})` : ` (\xF7${two(1 / ratio2)})`;
+}
+function phrase(c, esc) {
+  const name = esc(c.key, 60);
+  const values = `${valueText(c.unlimited === "baseline" ? null : c.baseline, esc)} \u2192 ${valueText(c.unlimited === "candidate" ? null : c.candidate, esc)}`;
+  if (c.kind === "added") return `added ${name} = ${valueText(c.candidate, esc)}`;
+  if (c.kind === "removed") return `removed ${name}`;
+  if (c.kind === "changed") return `changed ${name} ${values}`;
+  const effect = c.effect === null || c.effect === void 0 ? "" : `: ${say(EFFECT_WORD, c.effect, esc)}`;
+  const unknown = c.role === null ? " (role unknown)" : "";
+  return `${c.kind} ${name} ${values}${factor(c.ratio)}${effect}${unknown}`;
+}
+function prSummary(review2, esc) {
+  const all = review2.hyperparameters;
+  if (all.length === 0) return null;
+  const known = all.filter((c) => c.effect !== null && c.effect !== void 0);
+  const rest = all.filter((c) => c.effect === null || c.effect === void 0);
+  const inert = (c) => c.role === "inert";
+  const ordered = [...known, ...rest.filter((c) => !inert(c)), ...rest.filter(inert)];
+  const shown = ordered.slice(0, PR_SUMMARY_CHANGES).map((c) => phrase(c, esc));
+  const more = ordered.length - shown.length;
+  return `${shown.join("; ")}${more > 0 ? `; and ${count(more)} more` : ""}.`;
 }
 
 // src/report/tables.ts
@@ -52186,16 +53144,20 @@ function decompositionTable(review2, esc, compact = false) {
     units
   };
 }
-function leversTable(review2, esc) {
+var LEVERS_SHOWN = 3;
+function leversTable(review2, esc, range = {}) {
   const f = numberFormatFor(review2);
-  return {
-    header: ["#", "Lever", "Why"],
-    align: ["r", "l", "l"],
-    rows: review2.levers.map((lever, i2) => {
-      const text2 = leverText(lever, review2, f, esc);
-      return [String(i2 + 1), text2.title, text2.sentences.join(" ") || "\u2014"];
-    })
-  };
+  const said = /* @__PURE__ */ new Set();
+  const rows = [];
+  review2.levers.forEach((lever, i2) => {
+    const text2 = leverText(lever, review2, f, esc);
+    const fresh = text2.sentences.filter((s) => !said.has(s));
+    for (const s of text2.sentences) said.add(s);
+    if (i2 < (range.from ?? 0) || i2 >= (range.to ?? Infinity)) return;
+    const why = fresh.length > 0 ? fresh.join(" ") : text2.sentences.length > 0 ? "For the reason above." : "\u2014";
+    rows.push([String(i2 + 1), text2.title, why]);
+  });
+  return { header: ["#", "Lever", "Why"], align: ["r", "l", "l"], rows };
 }
 function sliceHarm(slice, review2) {
   return review2.metric.goal === "minimize" ? slice.delta.estimate : -slice.delta.estimate;
@@ -52294,7 +53256,10 @@ function buildHeadline(review2, esc) {
   const vTone = v.change === "better" ? "good" : v.change === "worse" ? "bad" : "neutral";
   const vStats = v.delta.ci === null ? `${change(v.delta.estimate, f)}; run-to-run noise unknown` : `${change(v.delta.estimate, f)}, ${levelPercent(review2)}% interval ${changeInterval(v.delta.ci, f)}, ${pText(v.delta.p)}, ${say(TEST_WORD, v.delta.test, esc)}`;
   const from = vSplit === void 0 ? "" : `${value(vSplit.baseline, f)} \u2192 ${value(vSplit.candidate, f)} `;
+  const did = prSummary(review2, esc);
+  const errorTerms = review2.metric.goal === "maximize" ? ` Bias and variance are in error terms (1 \u2212 ${metric}).` : "";
   const lines = [
+    ...did === null ? [] : [{ label: "This PR", text: did, tone: "neutral" }],
     {
       label: say(MOVEMENT_SENTENCE, review2.movement, esc),
       text: `${changePhrase("avoidable bias", review2.bias.delta, review2, f)}; ${changePhrase(
@@ -52306,7 +53271,7 @@ function buildHeadline(review2, esc) {
         DIAGNOSIS_WORD,
         review2.candidate.diagnosis,
         esc
-      )}.`,
+      )}.${errorTerms}`,
       tone: movementTone
     },
     {
@@ -52325,7 +53290,7 @@ function buildHeadline(review2, esc) {
   if (first === void 0)
     lines.push({ label: "Next lever", text: "none suggested.", tone: "neutral" });
   else {
-    const text2 = leverText(first, review2, f, esc);
+    const text2 = leverHeadline(first, review2, f, esc);
     lines.push({
       label: `Next lever: ${text2.title}`,
       text: text2.sentences.join(" ") || "\u2014",
@@ -52548,6 +53513,11 @@ function interpolate(points, x2, logX) {
 function names(list, total, esc) {
   return `${list.map((n) => esc(n, 60)).join(", ")}${total > list.length ? ", \u2026" : ""}`;
 }
+function jsonText(v, esc) {
+  if (typeof v === "number") return short(v);
+  if (v === null) return "none";
+  return esc(JSON.stringify(v) ?? String(v), 40);
+}
 function slices(n) {
   return `${count(n)} ${n === 1 ? "slice" : "slices"}`;
 }
@@ -52585,6 +53555,13 @@ function noteSentence(note, review2, f, esc) {
       return `${esc(note.file, 120)}: the artifact has its own epoch curve; the epoch log ${esc(note.log, 120)} was not used.`;
     case "epoch-log-missing":
       return `No epoch log ${esc(note.log, 120)} next to ${esc(note.file, 120)}; the config's epoch-log mapping was not applied to it.`;
+    case "unmapped-hyperparameters": {
+      const list = note.changes.map(
+        (c) => `${esc(c.key, 60)} ${jsonText(c.baseline, esc)} \u2192 ${jsonText(c.candidate, esc)}${c.ambiguous ? " (means different things in different libraries)" : ""}`
+      ).join("; ");
+      const more = note.count > note.changes.length ? `; and ${count(note.count - note.changes.length)} more` : "";
+      return `The PR changed ${note.count === 1 ? "a hyperparameter" : "hyperparameters"} whose role fitgap does not know, so no lever rests on ${note.count === 1 ? "it" : "them"}: ${list}${more}. Map ${note.count === 1 ? "it" : "them"} in the config's \`hyperparameters\` (role and inverse).`;
+    }
     default:
       return esc(String(note.code), 60);
   }
@@ -52838,6 +53815,25 @@ Too large for this space: see the JSON report.
 `;
   return stub.length <= target ? stub : stub.slice(0, Math.max(0, target));
 }
+var EVIDENCE_CHART = {
+  "sweep-minimum": "regularization",
+  "learning-curve": "training_examples",
+  "gap-trend": "training_examples",
+  "epoch-minimum": "epochs",
+  "still-improving": "epochs",
+  diagnosis: "plane",
+  "component-change": "plane",
+  "pr-change": "plane"
+};
+function openChart(review2, charts) {
+  const kinds = (review2.levers[0]?.evidence ?? []).flatMap((e) => EVIDENCE_CHART[e.kind] ?? []);
+  const ordered = [...kinds.filter((k) => k !== "plane"), "plane"];
+  for (const kind of ordered) {
+    const chart2 = charts.find((c) => c.kind === kind);
+    if (chart2 !== void 0) return chart2;
+  }
+  return void 0;
+}
 function table(t) {
   const body = markdownTable([t.header, ...t.rows], { align: t.align, alignDelimiters: false });
   return t.units === void 0 || t.units === null ? body : `${t.units}
@@ -52865,15 +53861,34 @@ function compose(review2, { marker, files, charts }, d) {
   const missing = unavailableNotes(review2, escapeInline);
   if (missing.length > 0) out.push(...missing.map((m) => `- ${m}`), "");
   if (review2.levers.length > 0) {
-    out.push("### Next levers", "", table(leversTable(review2, escapeInline)), "");
+    out.push(
+      "### Next levers",
+      "",
+      table(leversTable(review2, escapeInline, { to: LEVERS_SHOWN })),
+      ""
+    );
+    const more = review2.levers.length - LEVERS_SHOWN;
+    if (more > 0)
+      out.push(
+        ...details(`${count(more)} more ${more === 1 ? "lever" : "levers"}`, [
+          table(leversTable(review2, escapeInline, { from: LEVERS_SHOWN }))
+        ])
+      );
   }
-  if (d.charts) {
-    if (charts.length > 0) {
-      out.push("### Charts", "");
-      for (const chart2 of charts) {
-        out.push(chart2.caption, "", "```mermaid", chart2.code, "```", "");
-      }
-    }
+  if (d.charts && charts.length > 0) {
+    const open3 = openChart(review2, charts);
+    const fence = (chart2) => [
+      chart2.caption,
+      "",
+      "```mermaid",
+      chart2.code,
+      "```",
+      ""
+    ];
+    if (open3 !== void 0) out.push("### Chart", "", ...fence(open3));
+    const folded = charts.filter((c) => c !== open3);
+    if (folded.length > 0)
+      out.push(...details(open3 === void 0 ? "Charts" : "More charts", folded.flatMap(fence)));
   }
   if (review2.slices.length > 0 && d.slices > 0) {
     const c = sliceCounts(review2.slices);
@@ -53731,8 +54746,8 @@ async function runReview(deps) {
   const pr = context3.pullRequest;
   const headSha = pr?.headSha ?? context3.sha;
   const shown = (path) => {
-    const inside = relative3(settings.workspace, resolve5(settings.workspace, path));
-    if (inside !== "" && !inside.startsWith("..") && !isAbsolute2(inside)) return inside;
+    const inside2 = relative3(settings.workspace, resolve5(settings.workspace, path));
+    if (inside2 !== "" && !inside2.startsWith("..") && !isAbsolute2(inside2)) return inside2;
     const artifact = settings.baselineArtifact;
     return artifact === null ? basename3(path) : `artifact ${artifact}: ${basename3(path)}`;
   };
