@@ -27,12 +27,16 @@ import { exampleNoise, validationPower } from './power.js';
 import type { RunsExampleNoise } from './noise.js';
 import { applyGate } from './gate.js';
 import { reviewGuardrails } from './guardrails.js';
-import { diffHyperparameters, pulledLevers } from './hyperparameters.js';
+import type { HyperparameterRolesConfig } from '../model/hyperparameter-roles.js';
+import type { HyperparameterChange } from '../model/review.js';
 import { chooseLevers } from './levers/choose.js';
+import { knobValues, regularizationKnob, runRoles, runVocabulary } from './levers/knobs.js';
+import { prChanges, type PrChange } from './levers/pr-changes.js';
+import { BUILT_IN_VOCABULARY, mergeRoles } from './levers/resolve-knob.js';
 import { shortfallSign } from './measure.js';
 import { movementOf, validationChangeOf } from './movement.js';
 import { toMetricDelta, toMetricUnits, toShortfallDelta, type CallSettings } from './noise.js';
-import { regularizationOf, summarize } from './run-summary.js';
+import { summarize } from './run-summary.js';
 import { compareSlices } from './slices.js';
 
 export interface ReviewInput {
@@ -44,6 +48,8 @@ export interface ReviewInput {
     reference?: number;
     /** Guardrail margins from the trusted config, by guardrail name. */
     guardrailMargins?: ReadonlyMap<string, number>;
+    /** The config's hyperparameter roles, laid over the built-in vocabulary. */
+    hyperparameters?: HyperparameterRolesConfig;
   };
   paired?: PairedPredictions;
   /** Notes from loading (files not used, rows without a partner…). */
@@ -85,7 +91,16 @@ export function buildReview(input: ReviewInput): Review {
   const settings = reviewSettings(input.settings);
   const calls: CallSettings = { alpha: settings.alpha, minEffect: settings.minEffect };
   const reference = input.settings.reference;
-  const summarySettings = { ...settings, ...(reference === undefined ? {} : { reference }) };
+  const vocabulary = runVocabulary(
+    mergeRoles(BUILT_IN_VOCABULARY, input.settings.hyperparameters),
+    baseline.hyperparameters,
+    candidate.hyperparameters,
+  );
+  const summarySettings = {
+    ...settings,
+    vocabulary,
+    ...(reference === undefined ? {} : { reference }),
+  };
   const runs = { baseline, candidate };
   const task = taskReference(baseline, candidate, reference);
   const examples = exampleNoise(runs, input.paired);
@@ -127,7 +142,11 @@ export function buildReview(input: ReviewInput): Review {
   const sliceResult = compareSlices(baseline, candidate, validation.change, calls);
   const noiseUnknown = validation.delta.test === 'none' || components.variance.test === 'none';
 
-  const changes = diffHyperparameters(baseline.hyperparameters, candidate.hyperparameters);
+  const changes = prChanges(
+    knobValues(baseline.hyperparameters),
+    knobValues(candidate.hyperparameters),
+    vocabulary,
+  );
   const { levers, nonLevers } = chooseLevers({
     goal: candidate.metric.goal,
     candidate: cand,
@@ -135,10 +154,12 @@ export function buildReview(input: ReviewInput): Review {
     movement,
     bias: components.bias ?? NO_BIAS_CHANGE,
     variance: components.variance,
-    pulled: pulledLevers(changes),
     changes,
-    regularization: regularizationOf(candidate),
+    vocabulary,
+    roles: runRoles(candidate.hyperparameters, vocabulary),
+    regularization: regularizationKnob(candidate.hyperparameters, vocabulary),
     noiseUnknown,
+    ...undeterminedOf(validation),
   });
   const hasGuardrails = baseline.guardrails !== undefined || candidate.guardrails !== undefined;
   const guardrails = hasGuardrails
@@ -177,7 +198,7 @@ export function buildReview(input: ReviewInput): Review {
     baseline: base,
     candidate: cand,
     slices: sliceResult.slices,
-    hyperparameters: changes,
+    hyperparameters: changes.map(hyperparameterChange),
     levers,
     nonLevers,
     gate,
@@ -198,6 +219,7 @@ export function buildReview(input: ReviewInput): Review {
           paired.rows > 0 &&
           repeatsDecide(runs, paired.split ?? 'validation'),
         examples,
+        changes,
       }),
     ],
     paired: pairedSummary(input.paired, pairedDecided, runs),
@@ -215,6 +237,7 @@ function reviewNotes(facts: {
   task: TaskReference;
   repeatsDecided: boolean;
   examples: RunsExampleNoise;
+  changes: PrChange[];
 }): Note[] {
   const notes: Note[] = [];
   if (facts.task.fromOneRun !== null)
@@ -230,6 +253,19 @@ function reviewNotes(facts: {
     });
   }
   if (facts.repeatsDecided) notes.push({ code: 'repeats-decided' });
+  const unmapped = facts.changes.filter((c) => c.origin === 'unknown' || c.origin === 'ambiguous');
+  if (unmapped.length > 0) {
+    notes.push({
+      code: 'unmapped-hyperparameters',
+      count: unmapped.length,
+      changes: unmapped.slice(0, NOTE_NAMES).map((c) => ({
+        key: c.hyperparameter,
+        ambiguous: c.origin === 'ambiguous',
+        baseline: c.from ?? null,
+        candidate: c.to ?? null,
+      })),
+    });
+  }
   if (facts.components.varianceFallback) notes.push({ code: 'train-dev-in-one-run' });
   if (facts.unpaired.length > 0) {
     notes.push({
@@ -251,6 +287,33 @@ function reviewNotes(facts: {
   if (facts.paired !== undefined && facts.paired.rows === 0 && facts.paired.partial !== true)
     notes.push({ code: 'predictions-share-no-id' });
   return notes;
+}
+
+/** Whether the validation change is undetermined, and the repeats per run that would decide it. */
+function undeterminedOf(
+  validation: Pick<Review['validation'], 'change' | 'repeatsNeeded'>,
+): { undetermined: { repeatsNeeded: number | null } } | Record<string, never> {
+  if (validation.change !== 'undetermined') return {};
+  return { undetermined: { repeatsNeeded: validation.repeatsNeeded?.repeats ?? null } };
+}
+
+/** A PR change as the review records it: the artifact's values, the kind, the role and effect. */
+function hyperparameterChange(c: PrChange): HyperparameterChange {
+  return {
+    key: c.hyperparameter,
+    baseline: c.from ?? null,
+    candidate: c.to ?? null,
+    kind: c.direction,
+    role: c.role,
+    inverse: c.inverse,
+    origin: c.origin,
+    effect: c.effect,
+    ...(c.ratio === undefined ? {} : { ratio: c.ratio }),
+    ...(c.totalUnits === undefined ? {} : { totalUnits: true }),
+    ...(c.unlimited === undefined
+      ? {}
+      : { unlimited: c.unlimited === 'from' ? ('baseline' as const) : ('candidate' as const) }),
+  };
 }
 
 /** The paired block: it names a test only when that test decided the validation change. */

@@ -13,7 +13,8 @@ import {
 } from './decompose.js';
 import { splitMeasure, type ExampleNoise } from './measure.js';
 import { measureNoise } from './noise.js';
-import { knobOf } from './hyperparameters.js';
+import { regularizationKnob } from './levers/knobs.js';
+import { BUILT_IN_VOCABULARY, type Vocabulary } from './levers/resolve-knob.js';
 import type { RunSummary, SplitSummary } from '../model/review.js';
 
 export interface SummarySettings {
@@ -23,6 +24,8 @@ export interface SummarySettings {
   reference?: number;
   /** The reference chosen for both runs (taskReference); overrides `reference`. */
   referenceChoice?: ReferenceChoice;
+  /** Hyperparameter names → roles, for the knob the regularization sweep varies. */
+  vocabulary?: Vocabulary;
 }
 
 /**
@@ -51,15 +54,6 @@ function splitSummary(
   return { split, mean: m, sd, repeats: n, examples: s.examples ?? null, ci };
 }
 
-/** The run's regularization strength (a weight penalty; dropout is not one), if it names one. */
-export function regularizationOf(run: RunArtifact): { key: string; value: number } | undefined {
-  for (const [key, value] of Object.entries(run.hyperparameters ?? {})) {
-    if (typeof value === 'number' && knobOf(key) === 'regularization' && !/dropout/i.test(key))
-      return { key, value };
-  }
-  return undefined;
-}
-
 /**
  * Training error significantly below the reference (negative avoidable bias): memorising noise,
  * or a wrong reference. Flagged also when its noise is unknown.
@@ -76,7 +70,10 @@ export function summarize(
 ): RunSummary {
   const reference = settings.referenceChoice ?? chooseReference(run, settings.reference);
   const components = decompose(run, reference.value, settings, examples);
-  const lambda = regularizationOf(run)?.value;
+  const lambda = regularizationKnob(
+    run.hyperparameters,
+    settings.vocabulary ?? BUILT_IN_VOCABULARY,
+  )?.value;
   return {
     name: run.run.name,
     commit: run.run.commit ?? null,

@@ -8,6 +8,8 @@ import type { ErrorObject } from 'ajv';
 import type * as Yaml from 'yaml';
 import validateConfigSchema from '../validate/generated/config-schema.js';
 import { InputError, quote, type Issue } from '../model/errors.js';
+import type { HyperparameterRolesConfig } from '../model/hyperparameter-roles.js';
+import { configRoleConflicts } from '../analysis/levers/resolve-knob.js';
 import { ajvIssues } from '../validate/ajv-issues.js';
 import {
   failOnIssues,
@@ -75,11 +77,30 @@ function lineOf(text: string, offset: number): number {
   return line;
 }
 
+/** Config names that match the same knob (`C` and `c`): only one of them could take effect. */
+function roleConflictIssues(map: HyperparameterRolesConfig | undefined, file: string): Issue[] {
+  if (map === undefined) return [];
+  return configRoleConflicts(map).map((group) => ({
+    file,
+    pointer: `/hyperparameters/${escapePointer(group[group.length - 1] ?? '')}`,
+    expected: `one entry per hyperparameter name (names match up to case, '-' and '_')`,
+    got: group.map(quote).join(', '),
+    hint: 'Keep one of these entries.',
+  }));
+}
+
+function escapePointer(key: string): string {
+  return key.replace(/~/g, '~0').replace(/\//g, '~1');
+}
+
 /** Parses and validates config text. */
 export async function parseConfig(text: string, file: string): Promise<ConfigFile> {
   // Imported here: a review without a config file does not load the YAML parser at all.
   const { parseDocument } = await import('yaml');
-  return checkSettings(parseRaw(parseDocument, text, file), file);
+  const config = checkSettings(parseRaw(parseDocument, text, file), file);
+  const conflicts = roleConflictIssues(config.hyperparameters, file);
+  if (conflicts.length > 0) throw new InputError(conflicts);
+  return config;
 }
 
 const NUMBER_KEYS: NumberSettingName[] = ['alpha', 'min-effect', 'gap-tolerance', 'reference'];

@@ -115,6 +115,7 @@ export function resolveSettings(
             Object.entries(config.guardrails).map(([name, g]) => [name, g.margin]),
           ),
         }),
+    ...(config.hyperparameters === undefined ? {} : { hyperparameters: config.hyperparameters }),
   };
 }
 

@@ -1,3 +1,5 @@
+import type { HyperparameterRolesConfig } from './hyperparameter-roles.js';
+
 /** The config file (`.github/fitgap.yml`), as written by the user (kebab-case keys). */
 export interface ConfigFile {
   alpha?: number;
@@ -11,6 +13,8 @@ export interface ConfigFile {
   limits?: { 'artifact-mb'?: number; 'csv-mb'?: number };
   /** Non-inferiority margins by guardrail name. */
   guardrails?: Record<string, { margin: number }>;
+  /** Roles of hyperparameter names, laid over the built-in vocabulary. */
+  hyperparameters?: HyperparameterRolesConfig;
 }
 
 /** Maps the columns of a CSV epoch log (e.g. `epoch,train_loss,val_loss`) onto `curves.epochs`. */

@@ -70,6 +70,39 @@ export type UnavailableCode = 'no-reference' | 'no-train-dev' | 'no-test';
 export type Diagnosis =
   'good-fit' | 'high-bias' | 'high-variance' | 'data-mismatch' | 'high-bias-and-variance';
 /**
+ * What a hyperparameter controls (README 'Hyperparameter vocabulary').
+ */
+export type KnobRole =
+  | 'regularization'
+  | 'capacity'
+  | 'features'
+  | 'polynomial-degree'
+  | 'data-size'
+  | 'epochs'
+  | 'early-stopping-patience'
+  | 'learning-rate'
+  | 'inert';
+/**
+ * What a hyperparameter change does to the model, given its role and direction.
+ */
+export type ChangeEffect =
+  | 'more-regularization'
+  | 'less-regularization'
+  | 'more-capacity'
+  | 'less-capacity'
+  | 'more-features'
+  | 'fewer-features'
+  | 'higher-degree'
+  | 'lower-degree'
+  | 'more-data'
+  | 'less-data'
+  | 'longer-training'
+  | 'shorter-training'
+  | 'later-stopping'
+  | 'earlier-stopping'
+  | 'larger-steps'
+  | 'smaller-steps';
+/**
  * A lever: what to try next.
  */
 export type LeverId =
@@ -86,7 +119,8 @@ export type LeverId =
   | 'align-training-data'
   | 'bigger-validation-set'
   | 'add-repeats'
-  | 'supply-reference';
+  | 'supply-reference'
+  | 'repeat-with-seeds';
 /**
  * One fact behind a lever.
  */
@@ -102,7 +136,8 @@ export type LeverEvidenceItem =
   | StillImprovingEvidence
   | EpochCurveSilentEvidence
   | ReferenceMissingEvidence
-  | NoiseUnknownEvidence;
+  | NoiseUnknownEvidence
+  | ChangeUndeterminedEvidence;
 /**
  * Something the reviewer should know about the inputs or the method.
  */
@@ -122,7 +157,8 @@ export type Note =
   | ReferencesDifferNote
   | NoiseFromEvaluationSetNote
   | PredictionsPartialOverlapNote
-  | RepeatsDecidedNote;
+  | RepeatsDecidedNote
+  | UnmappedHyperparametersNote;
 /**
  * What kept a guardrail from a full review.
  */
@@ -499,6 +535,34 @@ export interface HyperparameterChange {
    */
   candidate: unknown;
   kind: 'raised' | 'lowered' | 'changed' | 'added' | 'removed';
+  /**
+   * The knob's role; null when fitgap does not know it (origin unknown or ambiguous).
+   */
+  role?: KnobRole | null;
+  /**
+   * Raising the value lowers the role (scikit-learn's C).
+   */
+  inverse?: boolean;
+  /**
+   * Where the role came from.
+   */
+  origin?: 'built-in' | 'config' | 'ambiguous' | 'unknown';
+  /**
+   * The change's effect on the model; null when not a known raise or cut.
+   */
+  effect?: ChangeEffect | null;
+  /**
+   * candidate / baseline of the compared values, when both are finite and positive.
+   */
+  ratio?: number;
+  /**
+   * Layer sizes compared by their total units.
+   */
+  totalUnits?: boolean;
+  /**
+   * Which side means 'no limit' (max_depth None).
+   */
+  unlimited?: 'baseline' | 'candidate';
 }
 /**
  * What to try next, ranked by score.
@@ -519,9 +583,18 @@ export interface Suggestion {
   hyperparameter: string;
   value: number;
   /**
-   * Where the value comes from.
+   * Where the value comes from: between the baseline and candidate values, the baseline value itself (nothing worth typing lies between), a finite limit for a knob the PR set to 'no limit', the sweep's minimum, or one grid step beyond the sweep's end.
    */
-  basis: 'between-old-and-new' | 'sweep-minimum' | 'beyond-sweep-edge';
+  basis:
+    | 'between-old-and-new'
+    | 'back-to-baseline'
+    | 'finite-limit'
+    | 'sweep-minimum'
+    | 'beyond-sweep-edge';
+  /**
+   * The value is the total hidden units of a layer-size list.
+   */
+  totalUnits?: boolean;
 }
 /**
  * A present error component of the candidate, with its size and the validation error level (both shortfall units).
@@ -533,14 +606,26 @@ export interface DiagnosisEvidence {
   errorLevel: number;
 }
 /**
- * The PR changed a hyperparameter this lever reverses or counters.
+ * The PR changed a hyperparameter the way the model moved: this lever undoes or counters it.
  */
 export interface PrChangeEvidence {
   kind: 'pr-change';
   hyperparameter: string;
-  from: number;
-  to: number;
+  /**
+   * Baseline value (total units for layer sizes); null = no limit.
+   */
+  from: number | null;
+  /**
+   * Candidate value; null = no limit.
+   */
+  to: number | null;
   direction: 'raised' | 'lowered';
+  role: KnobRole;
+  effect: ChangeEffect;
+  /**
+   * Values are total units of layer sizes.
+   */
+  totalUnits?: boolean;
 }
 /**
  * How a component changed between the runs.
@@ -606,6 +691,10 @@ export interface LearningProjectionEvidence {
   projected: number;
   ci: Interval;
   r2: number;
+  /**
+   * The projection's interval includes today's validation value: more data is unlikely to help measurably.
+   */
+  includesToday: boolean;
 }
 /**
  * The train/validation gap at the right end of the learning curve.
@@ -658,6 +747,16 @@ export interface ReferenceMissingEvidence {
  */
 export interface NoiseUnknownEvidence {
   kind: 'noise-unknown';
+}
+/**
+ * The validation change could not be called either way at this noise: repeat both runs with more seeds before acting on any other lever.
+ */
+export interface ChangeUndeterminedEvidence {
+  kind: 'change-undetermined';
+  /**
+   * Repeats per run needed to detect the minimum effect; null when not known.
+   */
+  repeatsNeeded: number | null;
 }
 export interface Gate {
   pass: boolean;
@@ -804,6 +903,28 @@ export interface PredictionsPartialOverlapNote {
  */
 export interface RepeatsDecidedNote {
   code: 'repeats-decided';
+}
+/**
+ * Hyperparameters the PR changed whose role fitgap does not know (or that mean different things in different libraries): map them in the config's `hyperparameters`.
+ */
+export interface UnmappedHyperparametersNote {
+  code: 'unmapped-hyperparameters';
+  count: number;
+  /**
+   * The first few (at most 5) of them.
+   */
+  changes: {
+    key: string;
+    ambiguous: boolean;
+    /**
+     * Any JSON value (null when added).
+     */
+    baseline: unknown;
+    /**
+     * Any JSON value (null when removed).
+     */
+    candidate: unknown;
+  }[];
 }
 /**
  * Paired-prediction evidence on the validation change. `test` names the paired test only when it decided the change; null otherwise (with `reason`).

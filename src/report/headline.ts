@@ -14,7 +14,8 @@ import {
 } from './format.js';
 import { gateSentence } from './gate.js';
 import { guardrailNames, tradeOffPhrase } from './guardrails.js';
-import { leverText } from './levers.js';
+import { leverHeadline } from './levers.js';
+import { prSummary } from './pr-summary.js';
 import { sortSlices } from './tables.js';
 import {
   DIAGNOSIS_WORD,
@@ -94,7 +95,13 @@ export function buildHeadline(review: Review, esc: Escape): Headline {
       : `${change(v.delta.estimate, f)}, ${levelPercent(review)}% interval ${changeInterval(v.delta.ci, f)}, ${pText(v.delta.p)}, ${say(TEST_WORD, v.delta.test, esc)}`;
   const from =
     vSplit === undefined ? '' : `${value(vSplit.baseline, f)} → ${value(vSplit.candidate, f)} `;
+  const did = prSummary(review, esc);
+  const errorTerms =
+    review.metric.goal === 'maximize'
+      ? ` Bias and variance are in error terms (1 − ${metric}).`
+      : '';
   const lines: HeadlineLine[] = [
+    ...(did === null ? [] : [{ label: 'This PR', text: did, tone: 'neutral' as const }]),
     {
       label: say(MOVEMENT_SENTENCE, review.movement, esc),
       text: `${changePhrase('avoidable bias', review.bias.delta, review, f)}; ${changePhrase(
@@ -106,7 +113,7 @@ export function buildHeadline(review: Review, esc: Escape): Headline {
         DIAGNOSIS_WORD,
         review.candidate.diagnosis,
         esc,
-      )}.`,
+      )}.${errorTerms}`,
       tone: movementTone,
     },
     {
@@ -125,7 +132,7 @@ export function buildHeadline(review: Review, esc: Escape): Headline {
   if (first === undefined)
     lines.push({ label: 'Next lever', text: 'none suggested.', tone: 'neutral' });
   else {
-    const text = leverText(first, review, f, esc);
+    const text = leverHeadline(first, review, f, esc);
     lines.push({
       label: `Next lever: ${text.title}`,
       text: text.sentences.join(' ') || '—',

@@ -15,7 +15,7 @@ import {
   valueRange,
   type NumberFormat,
 } from './format.js';
-import { COMPONENT_TITLE, COMPONENT_WORD, LEVER_TITLE, say } from './words.js';
+import { COMPONENT_TITLE, COMPONENT_WORD, EFFECT_WORD, LEVER_TITLE, say } from './words.js';
 
 export interface LeverText {
   title: string;
@@ -36,9 +36,28 @@ export function leverText(lever: Lever, review: Review, f: NumberFormat, esc: Es
   return { title: say(LEVER_TITLE, lever.id, esc), sentences };
 }
 
-/** A change `from → to` of a hyperparameter, escaped. */
-function fromTo(e: { from: number; to: number }): string {
-  return `${short(e.from)} → ${short(e.to)}`;
+/**
+ * The lever in one short sentence for the headline: its suggestion when it has one, else its first
+ * measured or PR-change reason.
+ */
+export function leverHeadline(
+  lever: Lever,
+  review: Review,
+  f: NumberFormat,
+  esc: Escape,
+): LeverText {
+  const ctx = { review, f, esc };
+  const title = say(LEVER_TITLE, lever.id, esc);
+  if (lever.suggestion !== undefined)
+    return { title, sentences: [suggestionSentence(lever.suggestion, ctx)] };
+  const first = lever.evidence.flatMap((e) => evidenceSentence(e, lever.id, ctx) ?? [])[0];
+  return { title, sentences: first === undefined ? [] : [first] };
+}
+
+/** A change `from → to` of a hyperparameter; null is "no limit". */
+function fromTo(e: { from: number | null; to: number | null }): string {
+  const v = (x: number | null): string => (x === null ? 'no limit' : short(x));
+  return `${v(e.from)} → ${v(e.to)}`;
 }
 
 function evidenceSentence(e: LeverEvidence, id: LeverId, ctx: Context): string | null {
@@ -51,8 +70,10 @@ function evidenceSentence(e: LeverEvidence, id: LeverId, ctx: Context): string |
       if (e.component === 'overfit')
         return `Test error exceeds validation error by ${amount(e.value, f)}: model choices may be tuned to the validation set; enlarge or refresh it.`;
       return `The candidate has high ${say(COMPONENT_WORD, e.component, esc)}: ${amount(e.value, f)} against a validation error of ${value(e.errorLevel, f)}.`;
-    case 'pr-change':
-      return `This PR ${e.direction === 'raised' ? 'raised' : 'lowered'} ${esc(e.hyperparameter, 60)} ${fromTo(e)}.`;
+    case 'pr-change': {
+      const units = e.totalUnits === true ? ' hidden units in total' : '';
+      return `This PR ${e.direction === 'raised' ? 'raised' : 'lowered'} ${esc(e.hyperparameter, 60)} ${fromTo(e)}${units}: ${say(EFFECT_WORD, e.effect, esc)}.`;
+    }
     case 'component-change': {
       const word =
         e.delta.call === 'up' ? 'rose' : e.delta.call === 'down' ? 'fell' : 'held steady';
@@ -69,6 +90,8 @@ function evidenceSentence(e: LeverEvidence, id: LeverId, ctx: Context): string |
     case 'sweep-minimum':
       return sweepSentence(e, ctx);
     case 'learning-curve': {
+      if (e.includesToday)
+        return `More data is unlikely to help measurably: at ${count(e.atX)} training examples the power-law fit projects validation ${metric} ${value(e.projected, f)}, with an interval (${valueRange(e.ci, f)}) that includes today's ${value(e.current, f)}.`;
       const times = e.fromX > 0 ? ` (${short(e.atX / e.fromX)}× the largest on the curve)` : '';
       return `At ${count(e.atX)} training examples${times} the power-law fit (R² ${fixed(e.r2, 2)}) projects validation ${metric} ${value(e.current, f)} → ${value(e.projected, f)} (${valueRange(e.ci, f)}).`;
     }
@@ -89,6 +112,10 @@ function evidenceSentence(e: LeverEvidence, id: LeverId, ctx: Context): string |
       return 'Bias is unknown without a reference level: add `reference` (human-level error, a prior system, or an estimated Bayes error) to the artifacts or the config.';
     case 'noise-unknown':
       return 'Run-to-run noise is unknown: train with 2 or more seeds (or ship per-example predictions) so changes can be tested.';
+    case 'change-undetermined':
+      return e.repeatsNeeded === null
+        ? 'The validation change is undetermined at this noise: no other lever can be judged yet.'
+        : `The validation change is undetermined at this noise: about ${count(e.repeatsNeeded)} repeats (seeds) per run would detect the minimum effect.`;
     default:
       return null;
   }
@@ -112,12 +139,16 @@ function sweepSentence(e: Extract<LeverEvidence, { kind: 'sweep-minimum' }>, ctx
   return `The regularization sweep has its lowest validation (${value(e.bestValidation, f)}) at ${at}.${edge}`;
 }
 
+const BASIS: Readonly<Record<Suggestion['basis'], string>> = {
+  'between-old-and-new': ', between the old and new values',
+  'back-to-baseline': ', the baseline value',
+  'finite-limit': ', a finite limit instead of none',
+  'sweep-minimum': ", the sweep's minimum",
+  'beyond-sweep-edge': ', one grid step beyond the end of the sweep',
+};
+
 function suggestionSentence(s: Suggestion, ctx: Context): string {
-  const basis =
-    s.basis === 'between-old-and-new'
-      ? ', between the old and new values'
-      : s.basis === 'sweep-minimum'
-        ? ", the sweep's minimum"
-        : ', one grid step beyond the end of the sweep';
-  return `Try ${ctx.esc(s.hyperparameter, 60)} ≈ ${short(s.value)}${basis}.`;
+  const basis = BASIS[s.basis] ?? '';
+  const units = s.totalUnits === true ? ' hidden units in total' : '';
+  return `Try ${ctx.esc(s.hyperparameter, 60)} ≈ ${short(s.value)}${units}${basis}.`;
 }

@@ -6,7 +6,7 @@
  * the comment says what was dropped.
  */
 import { markdownTable } from 'markdown-table';
-import type { Review } from '../model/review.js';
+import type { LeverEvidence, Review } from '../model/review.js';
 import { escapeInline } from './escape.js';
 import { count } from './format.js';
 import { guardrailsTable } from './guardrails.js';
@@ -19,6 +19,7 @@ import { curveEvidence, methodNotes, provenanceTables } from './method.js';
 import { unavailableNotes } from './notes.js';
 import type { Table } from './tables.js';
 import {
+  LEVERS_SHOWN,
   MAX_HYPERPARAMETER_ROWS,
   decompositionTable,
   hyperparameterTable,
@@ -106,6 +107,32 @@ export function renderMarkdown(review: Review, options: MarkdownOptions = {}): s
   return stub.length <= target ? stub : stub.slice(0, Math.max(0, target));
 }
 
+/** The chart a kind of lever evidence is drawn in. */
+const EVIDENCE_CHART: Partial<Record<LeverEvidence['kind'], Chart['kind']>> = {
+  'sweep-minimum': 'regularization',
+  'learning-curve': 'training_examples',
+  'gap-trend': 'training_examples',
+  'epoch-minimum': 'epochs',
+  'still-improving': 'epochs',
+  diagnosis: 'plane',
+  'component-change': 'plane',
+  'pr-change': 'plane',
+};
+
+/**
+ * The one chart left open: the one that carries the first lever's evidence, a measured curve
+ * before the bias/variance plane; the plane when the first lever has no drawn evidence.
+ */
+export function openChart(review: Review, charts: readonly Chart[]): Chart | undefined {
+  const kinds = (review.levers[0]?.evidence ?? []).flatMap((e) => EVIDENCE_CHART[e.kind] ?? []);
+  const ordered = [...kinds.filter((k) => k !== 'plane'), 'plane'];
+  for (const kind of ordered) {
+    const chart = charts.find((c) => c.kind === kind);
+    if (chart !== undefined) return chart;
+  }
+  return undefined;
+}
+
 function table(t: Table): string {
   const body = markdownTable([t.header, ...t.rows], { align: t.align, alignDelimiters: false });
   return t.units === undefined || t.units === null ? body : `${t.units}\n\n${body}`;
@@ -140,15 +167,34 @@ function compose(review: Review, { marker, files, charts }: Parts, d: Detail): s
   const missing = unavailableNotes(review, escapeInline);
   if (missing.length > 0) out.push(...missing.map((m) => `- ${m}`), '');
   if (review.levers.length > 0) {
-    out.push('### Next levers', '', table(leversTable(review, escapeInline)), '');
+    out.push(
+      '### Next levers',
+      '',
+      table(leversTable(review, escapeInline, { to: LEVERS_SHOWN })),
+      '',
+    );
+    const more = review.levers.length - LEVERS_SHOWN;
+    if (more > 0)
+      out.push(
+        ...details(`${count(more)} more ${more === 1 ? 'lever' : 'levers'}`, [
+          table(leversTable(review, escapeInline, { from: LEVERS_SHOWN })),
+        ]),
+      );
   }
-  if (d.charts) {
-    if (charts.length > 0) {
-      out.push('### Charts', '');
-      for (const chart of charts) {
-        out.push(chart.caption, '', '```mermaid', chart.code, '```', '');
-      }
-    }
+  if (d.charts && charts.length > 0) {
+    const open = openChart(review, charts);
+    const fence = (chart: Chart): string[] => [
+      chart.caption,
+      '',
+      '```mermaid',
+      chart.code,
+      '```',
+      '',
+    ];
+    if (open !== undefined) out.push('### Chart', '', ...fence(open));
+    const folded = charts.filter((c) => c !== open);
+    if (folded.length > 0)
+      out.push(...details(open === undefined ? 'Charts' : 'More charts', folded.flatMap(fence)));
   }
   if (review.slices.length > 0 && d.slices > 0) {
     const c = sliceCounts(review.slices);

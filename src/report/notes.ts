@@ -4,12 +4,19 @@
  */
 import type { Note, NonLever, Review, RunWarning, UnavailableCode } from '../model/review.js';
 import type { Escape } from './escape.js';
-import { amount, count, value, type NumberFormat } from './format.js';
+import { amount, count, short, value, type NumberFormat } from './format.js';
 import { COMPONENT_ORDER, COMPONENT_TITLE, SPLIT_WORD, say, type Words } from './words.js';
 
 /** Names listed in a note, and "…" when there were more. */
 function names(list: readonly string[], total: number, esc: Escape): string {
   return `${list.map((n) => esc(n, 60)).join(', ')}${total > list.length ? ', …' : ''}`;
+}
+
+/** A hyperparameter value from an artifact: a number in short form, anything else as JSON, escaped. */
+function jsonText(v: unknown, esc: Escape): string {
+  if (typeof v === 'number') return short(v);
+  if (v === null) return 'none';
+  return esc(JSON.stringify(v) ?? String(v), 40);
 }
 
 function slices(n: number): string {
@@ -50,6 +57,19 @@ export function noteSentence(note: Note, review: Review, f: NumberFormat, esc: E
       return `${esc(note.file, 120)}: the artifact has its own epoch curve; the epoch log ${esc(note.log, 120)} was not used.`;
     case 'epoch-log-missing':
       return `No epoch log ${esc(note.log, 120)} next to ${esc(note.file, 120)}; the config's epoch-log mapping was not applied to it.`;
+    case 'unmapped-hyperparameters': {
+      const list = note.changes
+        .map(
+          (c) =>
+            `${esc(c.key, 60)} ${jsonText(c.baseline, esc)} → ${jsonText(c.candidate, esc)}${c.ambiguous ? ' (means different things in different libraries)' : ''}`,
+        )
+        .join('; ');
+      const more =
+        note.count > note.changes.length
+          ? `; and ${count(note.count - note.changes.length)} more`
+          : '';
+      return `The PR changed ${note.count === 1 ? 'a hyperparameter' : 'hyperparameters'} whose role fitgap does not know, so no lever rests on ${note.count === 1 ? 'it' : 'them'}: ${list}${more}. Map ${note.count === 1 ? 'it' : 'them'} in the config's \`hyperparameters\` (role and inverse).`;
+    }
     default:
       return esc(String((note as { code: unknown }).code), 60);
   }

@@ -120,16 +120,35 @@ export function diagnosisLine(review: Review, esc: Escape): string {
   return `Diagnosis: baseline ${say(DIAGNOSIS_WORD, review.baseline.diagnosis, esc)}; candidate ${say(DIAGNOSIS_WORD, review.candidate.diagnosis, esc)}.`;
 }
 
-export function leversTable(review: Review, esc: Escape): Table {
+/** Levers shown in the comment's table; the rest are folded. */
+export const LEVERS_SHOWN = 3;
+
+/**
+ * The levers from `from` (0-based) up to `to`, numbered in the review's order. A sentence an
+ * earlier lever already gave (the same diagnosis, the same PR change) is not repeated.
+ */
+export function leversTable(
+  review: Review,
+  esc: Escape,
+  range: { from?: number; to?: number } = {},
+): Table {
   const f = numberFormatFor(review);
-  return {
-    header: ['#', 'Lever', 'Why'],
-    align: ['r', 'l', 'l'],
-    rows: review.levers.map((lever, i) => {
-      const text = leverText(lever, review, f, esc);
-      return [String(i + 1), text.title, text.sentences.join(' ') || '—'];
-    }),
-  };
+  const said = new Set<string>();
+  const rows: string[][] = [];
+  review.levers.forEach((lever, i) => {
+    const text = leverText(lever, review, f, esc);
+    const fresh = text.sentences.filter((s) => !said.has(s));
+    for (const s of text.sentences) said.add(s);
+    if (i < (range.from ?? 0) || i >= (range.to ?? Infinity)) return;
+    const why =
+      fresh.length > 0
+        ? fresh.join(' ')
+        : text.sentences.length > 0
+          ? 'For the reason above.'
+          : '—';
+    rows.push([String(i + 1), text.title, why]);
+  });
+  return { header: ['#', 'Lever', 'Why'], align: ['r', 'l', 'l'], rows };
 }
 
 /** Shortfall change of a slice (up = worse), used to put the worst regressions first. */

@@ -4,6 +4,7 @@
  * entry is shown escaped, as the text it is.
  */
 import type {
+  ChangeEffect,
   Call,
   ComponentName,
   Diagnosis,
@@ -114,6 +115,7 @@ export const LEVER_TITLE = words<LeverId>({
   'bigger-validation-set': 'Use a bigger validation set',
   'add-repeats': 'Repeat each run with several seeds',
   'supply-reference': 'Supply a reference error level',
+  'repeat-with-seeds': 'Repeat both runs with more seeds first',
 });
 
 export const TEST_WORD = words<TestName>({
@@ -169,3 +171,22 @@ export function levelPercent(review: Review): string {
 /** The caution every report carries. */
 export const CAUTION =
   'This verdict is advice for a human reviewer, not a proof: it rests on the numbers the two runs recorded and on the tests named in the method notes.';
+
+export const EFFECT_WORD = words<ChangeEffect>({
+  'more-regularization': 'stronger regularization',
+  'less-regularization': 'weaker regularization',
+  'more-capacity': 'a bigger model',
+  'less-capacity': 'a smaller model',
+  'more-features': 'more features',
+  'fewer-features': 'fewer features',
+  'higher-degree': 'higher-degree terms',
+  'lower-degree': 'lower-degree terms',
+  'more-data': 'more training data',
+  'less-data': 'less training data',
+  'longer-training': 'longer training',
+  'shorter-training': 'shorter training',
+  'later-stopping': 'later early stopping',
+  'earlier-stopping': 'earlier early stopping',
+  'larger-steps': 'larger optimiser steps',
+  'smaller-steps': 'smaller optimiser steps',
+});

@@ -94,6 +94,8 @@ describe('buildReview', () => {
       from: 0.1,
       to: 10,
       direction: 'raised',
+      role: 'regularization',
+      effect: 'more-regularization',
     });
     expect(first?.evidence[1]).toMatchObject({
       kind: 'component-change',

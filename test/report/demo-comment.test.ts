@@ -41,3 +41,28 @@ describe.each(['1-interactions', '2-lambda-3', '3-more-data'])('demo %s comment'
     expect(md.length).toBeLessThan(60_000);
   });
 });
+
+describe('demo comments are short', () => {
+  it.each([
+    ['1-interactions', '**Regularization curve**'],
+    ['2-lambda-3', '**Regularization curve**'],
+    ['3-more-data', '**Bias/variance plane**'],
+  ])('%s: three levers in the table, one chart open (%s)', async (name, caption) => {
+    const { review } = await reviewFiles({
+      baseline: 'demo/baseline.json',
+      candidate: `demo/${name}.json`,
+      config: 'demo/fitgap.yml',
+    });
+    const md = renderMarkdown(review);
+    // Mermaid blocks outside folded sections: only the first lever's chart.
+    const open = md.replace(/<details>[\s\S]*?<\/details>/g, '');
+    expect(mermaidBlocks(open)).toHaveLength(1);
+    expect(open.split('### Chart\n')[1]?.trimStart().startsWith(caption)).toBe(true);
+    const levers = (open.split('### Next levers')[1] ?? '').split('###')[0] ?? '';
+    expect(levers.match(/^\| \d+ \|/gm)?.length ?? 0).toBeLessThanOrEqual(3);
+    // The headline (title and its bullet list) stays short enough for one laptop screen.
+    const headline = md.split('\n### ')[0] ?? '';
+    expect(headline.split('\n').length).toBeLessThanOrEqual(12);
+    expect(headline.length).toBeLessThan(1600);
+  });
+});

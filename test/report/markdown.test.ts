@@ -66,7 +66,8 @@ describe('renderMarkdown', () => {
     expect(shapes).toEqual([
       [5, 7], // splits: header + train, train-dev, validation, test
       [6, 7], // decomposition: header + 4 components + diagnosis
-      [5, 3], // levers
+      [4, 3], // levers: header + the first 3
+      [2, 3], // the 4th lever, folded
       [15, 7], // slices: header + 14
       [7, 4], // hyperparameters
       [3, 4], // provenance: runs
@@ -92,15 +93,19 @@ describe('renderMarkdown', () => {
       'fitgap review: toward overfitting · validation worse · gate failed',
     );
     const items = [...doc.querySelectorAll('h2 + ul > li')].map((li) => li.textContent);
-    expect(items[0]).toMatch(/^The change moved the model toward overfitting: avoidable bias fell/);
-    expect(items[1]).toBe(
+    // This fixture records changes without roles (an older report): directions and values only.
+    expect(items[0]).toMatch(
+      /^This PR: raised hidden_units 64 → 256; lowered weight_decay 0.001 → 0.0001; /,
+    );
+    expect(items[1]).toMatch(/^The change moved the model toward overfitting: avoidable bias fell/);
+    expect(items[2]).toBe(
       "Validation mae_loaves worse: 6.050 → 6.380 (Δ +0.330, 95% interval [+0.120, +0.540], p = 0.006, Welch's t-test).",
     );
-    expect(items[2]).toBe('Gate failed: worse-validation: validation got significantly worse.');
-    expect(items[3]).toBe(
+    expect(items[3]).toBe('Gate failed: worse-validation: validation got significantly worse.');
+    // The first lever in one sentence: its first measured reason (it has no value to try).
+    expect(items[4]).toBe(
       'Next lever: Stop training earlier: The candidate has high variance: 1.290 against a ' +
-        'validation error of 6.380. Validation was best at epoch 31 of 80; stopping there saves ' +
-        '0.348 (generalization loss 5.8%).',
+        'validation error of 6.380.',
     );
   });
 
@@ -144,7 +149,9 @@ describe('renderMarkdown', () => {
     const doc = assertSafe(renderMarkdown(review));
     const shapes = tableShapes(doc);
     for (const shape of shapes) expect(new Set(shape.columns).size).toBe(1);
-    const slices = [...doc.querySelectorAll('details table')][0];
+    const slices = [...doc.querySelectorAll('details table')].find(
+      (t) => t.querySelector('th')?.textContent === 'Slice',
+    );
     const names = [...(slices?.querySelectorAll('tbody tr') ?? [])].map((tr) =>
       (tr.querySelector('td')?.textContent ?? '').replace(ZWJ, ''),
     );

@@ -72,9 +72,17 @@ describe('lever sentences', () => {
       text({
         id: 'weaker-regularization',
         score: 100,
-        suggestion: { hyperparameter: 'lambda', value: 0.5477, basis: 'between-old-and-new' },
+        suggestion: { hyperparameter: 'lambda', value: 0.55, basis: 'between-old-and-new' },
         evidence: [
-          { kind: 'pr-change', hyperparameter: 'lambda', from: 0.1, to: 3, direction: 'raised' },
+          {
+            kind: 'pr-change',
+            hyperparameter: 'lambda',
+            from: 0.1,
+            to: 3,
+            direction: 'raised',
+            role: 'regularization',
+            effect: 'more-regularization',
+          },
           {
             kind: 'component-change',
             component: 'bias',
@@ -83,10 +91,90 @@ describe('lever sentences', () => {
         ],
       }),
     ).toEqual([
-      'This PR raised lambda 0.1 → 3.',
+      'This PR raised lambda 0.1 → 3: stronger regularization.',
       'Avoidable bias rose (+0.017, p < 0.001): the model moved toward underfitting.',
-      'Try lambda ≈ 0.5477, between the old and new values.',
+      'Try lambda ≈ 0.55, between the old and new values.',
     ]);
+  });
+
+  it('names an inverse knob by its effect, "no limit" and total units', () => {
+    expect(
+      text({
+        id: 'weaker-regularization',
+        score: 100,
+        suggestion: { hyperparameter: 'C', value: 0.032, basis: 'between-old-and-new' },
+        evidence: [
+          {
+            kind: 'pr-change',
+            hyperparameter: 'C',
+            from: 1,
+            to: 0.001,
+            direction: 'lowered',
+            role: 'regularization',
+            effect: 'more-regularization',
+          },
+        ],
+      }),
+    ).toEqual([
+      'This PR lowered C 1 → 0.001: stronger regularization.',
+      'Try C ≈ 0.032, between the old and new values.',
+    ]);
+    expect(
+      text({
+        id: 'smaller-model',
+        score: 90,
+        suggestion: { hyperparameter: 'max_depth', value: 16, basis: 'finite-limit' },
+        evidence: [
+          {
+            kind: 'pr-change',
+            hyperparameter: 'max_depth',
+            from: 8,
+            to: null,
+            direction: 'raised',
+            role: 'capacity',
+            effect: 'more-capacity',
+          },
+        ],
+      }),
+    ).toEqual([
+      'This PR raised max\\_depth 8 → no limit: a bigger model.',
+      'Try max\\_depth ≈ 16, a finite limit instead of none.',
+    ]);
+    expect(
+      text({
+        id: 'smaller-model',
+        score: 90,
+        suggestion: {
+          hyperparameter: 'hidden_layer_sizes',
+          value: 560,
+          basis: 'between-old-and-new',
+          totalUnits: true,
+        },
+        evidence: [],
+      }),
+    ).toEqual([
+      'Try hidden\\_layer\\_sizes ≈ 560 hidden units in total, between the old and new values.',
+    ]);
+  });
+
+  it('says when more data is unlikely to help measurably', () => {
+    const [sentence] = text({
+      id: 'more-data',
+      score: 40,
+      evidence: [
+        {
+          kind: 'learning-curve',
+          fromX: 1000,
+          atX: 2000,
+          current: 0.022,
+          projected: 0.02,
+          ci: [0.002, 0.037],
+          r2: 0.9,
+          includesToday: true,
+        },
+      ],
+    });
+    expect(sentence).toMatch(/^More data is unlikely to help measurably: /);
   });
 
   it('says what the curves say', () => {
@@ -131,10 +219,18 @@ describe('lever sentences', () => {
       id: 'fewer-features',
       score: 90,
       evidence: [
-        { kind: 'pr-change', hyperparameter: 'a|b @team', from: 1, to: 2, direction: 'raised' },
+        {
+          kind: 'pr-change',
+          hyperparameter: 'a|b @team',
+          from: 1,
+          to: 2,
+          direction: 'raised',
+          role: 'capacity',
+          effect: 'more-capacity',
+        },
       ],
     });
-    expect(sentence).toBe('This PR raised a\\|b @\u200Dteam 1 → 2.');
+    expect(sentence).toBe('This PR raised a\\|b @\u200Dteam 1 → 2: a bigger model.');
   });
 });
 

@@ -18,6 +18,7 @@ export const LEVER_CATALOGUE: Readonly<Record<LeverId, { addresses: Target }>> =
   'bigger-validation-set': { addresses: 'validation-overfit' },
   'add-repeats': { addresses: 'evidence' },
   'supply-reference': { addresses: 'evidence' },
+  'repeat-with-seeds': { addresses: 'evidence' },
 };
 
 /**

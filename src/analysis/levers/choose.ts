@@ -1,24 +1,29 @@
 /**
- * What to try next (DESIGN.md §7): levers ranked by score, from the PR's own change when it
- * overshot, from the candidate's diagnosis sharpened by its curves, and from secondary findings;
- * each with the evidence behind it as data. Pure.
+ * What to try next (DESIGN.md §7): levers from the PR's own change when it moved the model the
+ * way it went, from the candidate's diagnosis sharpened by its curves, and from secondary
+ * findings; then every lever its own evidence rules out is dropped and only one direction per knob
+ * kept (./resolve.ts). Each lever carries its evidence as data. Pure.
  */
 import type { Lever, NonLever } from '../../model/review.js';
-import { knobOf } from '../hyperparameters.js';
 import { Drafts, curveEvidence, type LeverContext } from './context.js';
 import { diagnosisLevers } from './diagnosis.js';
 import { ownChangeLevers } from './own-change.js';
+import { resolveLevers, type LeverTieBreak } from './resolve.js';
 import { secondaryLevers } from './secondary.js';
 
 export type { LeverContext } from './context.js';
+export type { LeverTieBreak } from './resolve.js';
 
-export function chooseLevers(ctx: LeverContext): { levers: Lever[]; nonLevers: NonLever[] } {
+export function chooseLevers(
+  ctx: LeverContext,
+  tieBreak?: LeverTieBreak,
+): { levers: Lever[]; nonLevers: NonLever[] } {
   const curves = curveEvidence(ctx.candidate.curves);
   const drafts = new Drafts();
   ownChangeLevers(ctx, curves, drafts);
   diagnosisLevers(ctx, curves, drafts);
   secondaryLevers(ctx, curves, drafts);
-  return { levers: drafts.ranked(), nonLevers: nonLevers(ctx) };
+  return { levers: resolveLevers(drafts.ranked(), ctx.roles, tieBreak), nonLevers: nonLevers(ctx) };
 }
 
 /**
@@ -28,6 +33,6 @@ export function chooseLevers(ctx: LeverContext): { levers: Lever[]; nonLevers: N
 function nonLevers(ctx: LeverContext): NonLever[] {
   const biased =
     ctx.candidate.diagnosis === 'high-bias' || ctx.candidate.diagnosis === 'high-bias-and-variance';
-  const shrank = ctx.changes.some((c) => c.kind === 'lowered' && knobOf(c.key) === 'data');
+  const shrank = ctx.changes.some((c) => c.effect === 'less-data');
   return biased || shrank ? ['smaller-training-set'] : [];
 }

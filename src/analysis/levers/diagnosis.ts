@@ -12,8 +12,16 @@ import type {
   Suggestion,
 } from '../../model/review.js';
 import { BY_TARGET } from './catalogue.js';
-import { epochMinimum, type CurveEvidence, type Drafts, type LeverContext } from './context.js';
-import { numericChange, sweepSuggestion } from './own-change.js';
+import {
+  epochMinimum,
+  sweepEvidence,
+  sweepSuggestion,
+  sweepWants,
+  type CurveEvidence,
+  type Drafts,
+  type LeverContext,
+} from './context.js';
+import { PULLS, comparedValues } from './own-change.js';
 import * as SCORE from './scores.js';
 
 type Target = 'variance' | 'bias';
@@ -41,7 +49,15 @@ interface Draft {
 }
 
 export function diagnosisLevers(ctx: LeverContext, curves: CurveEvidence, drafts: Drafts): void {
-  const pulled = new Map(ctx.pulled.map((p) => [p.lever, p]));
+  const pulled = new Map<LeverId, LeverEvidence>();
+  for (const c of ctx.changes) {
+    const id = c.effect === null ? null : PULLS[c.effect];
+    const v = comparedValues(c);
+    if (id === null || v === null || v.from === null || v.to === null || pulled.has(id)) continue;
+    if (c.direction !== 'raised' && c.direction !== 'lowered') continue;
+    const { hyperparameter, direction } = c;
+    pulled.set(id, { kind: 'already-pulled', hyperparameter, from: v.from, to: v.to, direction });
+  }
   targets(ctx.candidate.diagnosis, ctx.candidate).forEach((target, t) => {
     const component = ctx.candidate.components[target];
     const base: LeverEvidence[] =
@@ -64,7 +80,7 @@ export function diagnosisLevers(ctx: LeverContext, curves: CurveEvidence, drafts
       const p = pulled.get(id);
       if (p !== undefined) {
         draft.score -= SCORE.ALREADY_PULLED_PENALTY;
-        draft.evidence.push({ kind: 'already-pulled', ...numericChange(p) });
+        draft.evidence.push(p);
       }
       drafts.add(id, draft.score, draft.evidence, draft.suggestion);
     });
@@ -77,14 +93,18 @@ function sharpen(id: LeverId, draft: Draft, ctx: LeverContext, curves: CurveEvid
     const lc = curves.learning;
     const twice = lc.projections[0];
     if (twice !== undefined) {
+      const current = ctx.candidate.splits.find((s) => s.split === 'validation')?.mean ?? 0;
+      const includesToday = twice.ci[0] <= current && current <= twice.ci[1];
+      if (includesToday) draft.score -= SCORE.PROJECTION_INCLUDES_TODAY_PENALTY;
       draft.evidence.push({
         kind: 'learning-curve',
         fromX: Math.max(...lc.chart.map((p) => p.x)),
         atX: twice.x,
-        current: ctx.candidate.splits.find((s) => s.split === 'validation')?.mean ?? 0,
+        current,
         projected: twice.validation,
         ci: twice.ci,
         r2: lc.r2,
+        includesToday,
       });
     }
     if (lc.gapTrend === 'flat') {
@@ -125,31 +145,21 @@ function sharpen(id: LeverId, draft: Draft, ctx: LeverContext, curves: CurveEvid
   }
 }
 
-/** A sweep whose minimum lies on this lever's side raises it; on the other side, lowers it. */
+/** A sweep whose minimum lies on this lever's side raises it and sets its value; the other side rules it out (./resolve.ts). */
 function sharpenBySweep(
   id: 'stronger-regularization' | 'weaker-regularization',
   draft: Draft,
   ctx: LeverContext,
   sweep: RegularizationEvidence,
 ): void {
-  // The candidate's strength below the minimum calls for stronger regularization, above for weaker.
-  const wants = id === 'stronger-regularization' ? 'below' : 'above';
-  const supports = sweep.side === 'unknown' ? null : sweep.side === wants;
-  if (supports === null && sweep.atEdge === null) return;
-  const key = ctx.regularization?.key;
-  draft.evidence.push({
-    kind: 'sweep-minimum',
-    hyperparameter: key ?? null,
-    bestX: sweep.bestX,
-    bestValidation: sweep.bestValidation,
-    current: ctx.regularization?.value ?? null,
-    suggestedX: sweep.suggestedX,
-    side: sweep.side,
-    supports,
-    atEdge: sweep.atEdge,
-  });
-  if (supports === true) {
+  const lever = id === 'stronger-regularization' ? 'stronger' : 'weaker';
+  const wants = sweepWants(sweep, ctx.regularization);
+  if (wants === null && sweep.atEdge === null) return;
+  draft.evidence.push(sweepEvidence(sweep, ctx.regularization, lever));
+  if (wants === lever) {
     draft.score += SCORE.SWEEP_AGREES_BONUS;
-    if (key !== undefined) draft.suggestion = sweepSuggestion(key, sweep);
-  } else if (supports === false) draft.score -= SCORE.SWEEP_DISAGREES_PENALTY;
+    const knob = ctx.regularization;
+    const suggestion = knob === undefined ? undefined : sweepSuggestion(sweep, knob, lever);
+    if (suggestion !== undefined) draft.suggestion = suggestion;
+  } else if (wants !== null) draft.score -= SCORE.SWEEP_DISAGREES_PENALTY;
 }

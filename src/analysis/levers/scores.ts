@@ -7,6 +7,8 @@
  * - 15–30: levers that only add evidence or that a secondary finding suggests.
  */
 
+/** The validation change is undetermined: more seeds come before any other lever. */
+export const REPEAT_FIRST = 110;
 /** Reverse an own regularization change that overshot (its effect is measured in this very PR). */
 export const REVERSE_OWN_CHANGE = 100;
 /** Keep the PR's capacity change and regularize harder, with the sweep pointing the same way. */
@@ -27,6 +29,8 @@ export const CATALOGUE_STEP = 2;
 export const GAP_CLOSING_BONUS = 8;
 /** The gap is flat at the right end: more data will help little, so it sinks below the others. */
 export const GAP_FLAT_PENALTY = 25;
+/** The learning curve's projection at 2× data has an interval that includes today's value. */
+export const PROJECTION_INCLUDES_TODAY_PENALTY = 25;
 /** The regularization sweep has its minimum on this lever's side. */
 export const SWEEP_AGREES_BONUS = 10;
 /** The sweep's minimum is on the other side: pulling this lever would move away from it. */

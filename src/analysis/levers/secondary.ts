@@ -45,6 +45,11 @@ export function secondaryLevers(ctx: LeverContext, curves: CurveEvidence, drafts
   if (candidate.biasUnknown) {
     drafts.add('supply-reference', SCORE.SUPPLY_REFERENCE, [{ kind: 'reference-missing' }]);
   }
+  if (ctx.undetermined !== undefined) {
+    drafts.add('repeat-with-seeds', SCORE.REPEAT_FIRST, [
+      { kind: 'change-undetermined', repeatsNeeded: ctx.undetermined.repeatsNeeded },
+    ]);
+  }
   if (ctx.noiseUnknown) {
     drafts.add('add-repeats', SCORE.ADD_REPEATS, [{ kind: 'noise-unknown' }]);
   }
