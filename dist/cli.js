@@ -25851,6 +25851,42 @@ function sharpenBySweep(id, draft, ctx, sweep) {
   } else if (wants !== null) draft.score -= SWEEP_DISAGREES_PENALTY;
 }
 
+// src/analysis/levers/cost-tie-break.ts
+var TRAINING_COST = /* @__PURE__ */ new Map([
+  ["fewer-features", "less"],
+  ["smaller-model", "less"],
+  ["early-stopping", "less"],
+  ["stronger-regularization", "same"],
+  ["weaker-regularization", "same"],
+  ["align-training-data", "same"],
+  ["supply-reference", "same"],
+  ["bigger-validation-set", "same"],
+  ["more-data", "more"],
+  ["more-features", "more"],
+  ["richer-features", "more"],
+  ["bigger-model", "more"],
+  ["train-longer", "more"],
+  ["add-repeats", "more"],
+  ["repeat-with-seeds", "more"]
+]);
+var RANK = { less: 0, same: 1, more: 2 };
+function trainingCost(id) {
+  return TRAINING_COST.get(id) ?? "same";
+}
+var cheaperFirst = (a, b) => RANK[trainingCost(a.id)] - RANK[trainingCost(b.id)];
+function markCheaperTies(levers) {
+  return levers.map((lever, i2) => {
+    const next = levers[i2 + 1];
+    if (next === void 0 || next.score !== lever.score) return lever;
+    const mine = trainingCost(lever.id);
+    if (mine === "more" || RANK[mine] >= RANK[trainingCost(next.id)]) return lever;
+    return {
+      ...lever,
+      evidence: [...lever.evidence, { kind: "cheaper-than", over: next.id, training: mine }]
+    };
+  });
+}
+
 // src/analysis/levers/resolve.ts
 var OPPOSITES = [
   ["stronger-regularization", "weaker-regularization"],
@@ -25950,13 +25986,17 @@ function secondaryLevers(ctx, curves, drafts) {
 }
 
 // src/analysis/levers/choose.ts
-function chooseLevers(ctx, tieBreak) {
+function chooseLevers(ctx, tieBreak = cheaperFirst) {
   const curves = curveEvidence(ctx.candidate.curves);
   const drafts = new Drafts();
   ownChangeLevers(ctx, curves, drafts);
   diagnosisLevers(ctx, curves, drafts);
   secondaryLevers(ctx, curves, drafts);
-  return { levers: resolveLevers(drafts.ranked(), ctx.roles, tieBreak), nonLevers: nonLevers(ctx) };
+  const levers = resolveLevers(drafts.ranked(), ctx.roles, tieBreak);
+  return {
+    levers: tieBreak === cheaperFirst ? markCheaperTies(levers) : levers,
+    nonLevers: nonLevers(ctx)
+  };
 }
 function nonLevers(ctx) {
   const biased = ctx.candidate.diagnosis === "high-bias" || ctx.candidate.diagnosis === "high-bias-and-variance";
@@ -34052,6 +34092,8 @@ function evidenceSentence(e, id, ctx) {
       return "Bias is unknown without a reference level: add `reference` (human-level error, a prior system, or an estimated Bayes error) to the artifacts or the config.";
     case "noise-unknown":
       return "Run-to-run noise is unknown: train with 2 or more seeds (or ship per-example predictions) so changes can be tested.";
+    case "cheaper-than":
+      return `Ranked alike with ${say(LEVER_TITLE, e.over, esc).toLowerCase()}; first because it ${e.training === "less" ? "trains for less" : "adds no training cost"}.`;
     case "change-undetermined":
       return e.repeatsNeeded === null ? "The validation change is undetermined at this noise: no other lever can be judged yet." : `The validation change is undetermined at this noise: about ${count(e.repeatsNeeded)} repeats (seeds) per run would detect the minimum effect.`;
     default:
