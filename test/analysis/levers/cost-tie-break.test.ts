@@ -12,7 +12,7 @@ import type { Lever, LeverId } from '../../../src/model/review.js';
 const lever = (id: LeverId, score: number): Lever => ({
   id,
   score,
-  evidence: [{ kind: 'diagnosis', diagnosis: 'high-variance', component: 2, validation: 9 }],
+  evidence: [{ kind: 'diagnosis', component: 'variance', value: 0.02, errorLevel: 0.09 }],
 });
 
 describe('cost as the tie-break between levers', () => {
