@@ -137,7 +137,8 @@ export type LeverEvidenceItem =
   | EpochCurveSilentEvidence
   | ReferenceMissingEvidence
   | NoiseUnknownEvidence
-  | ChangeUndeterminedEvidence;
+  | ChangeUndeterminedEvidence
+  | CheaperThanEvidence;
 /**
  * Something the reviewer should know about the inputs or the method.
  */
@@ -757,6 +758,14 @@ export interface ChangeUndeterminedEvidence {
    * Repeats per run needed to detect the minimum effect; null when not known.
    */
   repeatsNeeded: number | null;
+}
+/**
+ * The evidence ranks this lever and `over` alike; this one comes first because it costs less training (`training`: `less` or `same` time and size, against `more` for `over`).
+ */
+export interface CheaperThanEvidence {
+  kind: 'cheaper-than';
+  over: LeverId;
+  training: 'less' | 'same';
 }
 export interface Gate {
   pass: boolean;

@@ -112,6 +112,8 @@ function evidenceSentence(e: LeverEvidence, id: LeverId, ctx: Context): string |
       return 'Bias is unknown without a reference level: add `reference` (human-level error, a prior system, or an estimated Bayes error) to the artifacts or the config.';
     case 'noise-unknown':
       return 'Run-to-run noise is unknown: train with 2 or more seeds (or ship per-example predictions) so changes can be tested.';
+    case 'cheaper-than':
+      return `Ranked alike with ${say(LEVER_TITLE, e.over, esc).toLowerCase()}; first because it ${e.training === 'less' ? 'trains for less' : 'adds no training cost'}.`;
     case 'change-undetermined':
       return e.repeatsNeeded === null
         ? 'The validation change is undetermined at this noise: no other lever can be judged yet.'

@@ -67,6 +67,16 @@ describe('lever sentences', () => {
   const f = numberFormatFor(review);
   const text = (lever: Lever): string[] => leverText(lever, review, f, escapeInline).sentences;
 
+  it('says why the cheaper of two equally ranked levers comes first', () => {
+    expect(
+      text({
+        id: 'fewer-features',
+        score: 3,
+        evidence: [{ kind: 'cheaper-than', over: 'more-data', training: 'less' }],
+      }),
+    ).toEqual(['Ranked alike with add training data; first because it trains for less.']);
+  });
+
   it('reverses an own change that overshot, with a value between old and new', () => {
     expect(
       text({

@@ -8,22 +8,28 @@ import type { Lever, NonLever } from '../../model/review.js';
 import { Drafts, curveEvidence, type LeverContext } from './context.js';
 import { diagnosisLevers } from './diagnosis.js';
 import { ownChangeLevers } from './own-change.js';
+import { cheaperFirst, markCheaperTies } from './cost-tie-break.js';
 import { resolveLevers, type LeverTieBreak } from './resolve.js';
 import { secondaryLevers } from './secondary.js';
 
 export type { LeverContext } from './context.js';
 export type { LeverTieBreak } from './resolve.js';
 
+/** Levers of equal score are ordered by `tieBreak`; by default the one that trains for less first. */
 export function chooseLevers(
   ctx: LeverContext,
-  tieBreak?: LeverTieBreak,
+  tieBreak: LeverTieBreak = cheaperFirst,
 ): { levers: Lever[]; nonLevers: NonLever[] } {
   const curves = curveEvidence(ctx.candidate.curves);
   const drafts = new Drafts();
   ownChangeLevers(ctx, curves, drafts);
   diagnosisLevers(ctx, curves, drafts);
   secondaryLevers(ctx, curves, drafts);
-  return { levers: resolveLevers(drafts.ranked(), ctx.roles, tieBreak), nonLevers: nonLevers(ctx) };
+  const levers = resolveLevers(drafts.ranked(), ctx.roles, tieBreak);
+  return {
+    levers: tieBreak === cheaperFirst ? markCheaperTies(levers) : levers,
+    nonLevers: nonLevers(ctx),
+  };
 }
 
 /**
