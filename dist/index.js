@@ -15057,11 +15057,11 @@ var require_util4 = __commonJS({
             dataURL += serializeAMimeType(parsed);
           }
           dataURL += ";base64,";
-          const decoder = new StringDecoder("latin1");
+          const decoder3 = new StringDecoder("latin1");
           for (const chunk of bytes) {
-            dataURL += btoa2(decoder.write(chunk));
+            dataURL += btoa2(decoder3.write(chunk));
           }
-          dataURL += btoa2(decoder.end());
+          dataURL += btoa2(decoder3.end());
           return dataURL;
         }
         case "Text": {
@@ -15086,11 +15086,11 @@ var require_util4 = __commonJS({
         }
         case "BinaryString": {
           let binaryString = "";
-          const decoder = new StringDecoder("latin1");
+          const decoder3 = new StringDecoder("latin1");
           for (const chunk of bytes) {
-            binaryString += decoder.write(chunk);
+            binaryString += decoder3.write(chunk);
           }
-          binaryString += decoder.end();
+          binaryString += decoder3.end();
           return binaryString;
         }
       }
@@ -20572,15 +20572,15 @@ var require_rules = __commonJS({
     }
     exports.isJSONType = isJSONType;
     function getRules() {
-      const groups2 = {
+      const groups3 = {
         number: { type: "number", rules: [] },
         string: { type: "string", rules: [] },
         array: { type: "array", rules: [] },
         object: { type: "object", rules: [] }
       };
       return {
-        types: { ...groups2, integer: true, boolean: true, null: true },
-        rules: [{ rules: [] }, groups2.number, groups2.string, groups2.array, groups2.object],
+        types: { ...groups3, integer: true, boolean: true, null: true },
+        rules: [{ rules: [] }, groups3.number, groups3.string, groups3.array, groups3.object],
         post: { rules: [] },
         all: {},
         keywords: {}
@@ -29647,7 +29647,7 @@ var require_jstat = __commonJS({
         }
         jStat4.extend({
           // add a vector/matrix to a vector/matrix or scalar
-          add: function add(arr, arg) {
+          add: function add2(arr, arg) {
             if (isUsable(arg)) {
               if (!isUsable(arg[0])) arg = [arg];
               return jStat4.map(arr, function(value2, row, col) {
@@ -33068,7 +33068,7 @@ var require_YAMLMap = __commonJS({
       static from(schema, obj, ctx) {
         const { keepUndefined, replacer } = ctx;
         const map = new this(schema);
-        const add = (key, value2) => {
+        const add2 = (key, value2) => {
           if (typeof replacer === "function")
             value2 = replacer.call(obj, key, value2);
           else if (Array.isArray(replacer) && !replacer.includes(key))
@@ -33078,10 +33078,10 @@ var require_YAMLMap = __commonJS({
         };
         if (obj instanceof Map) {
           for (const [key, value2] of obj)
-            add(key, value2);
+            add2(key, value2);
         } else if (obj && typeof obj === "object") {
           for (const key of Object.keys(obj))
-            add(key, obj[key]);
+            add2(key, obj[key]);
         }
         if (typeof schema.sortMapEntries === "function") {
           map.items.sort(schema.sortMapEntries);
@@ -45995,10 +45995,10 @@ var inflt = function(dat, st, buf, dict) {
         lpos = pos, lm = null;
         break;
       } else {
-        var add = sym - 254;
+        var add2 = sym - 254;
         if (sym > 264) {
           var i2 = sym - 257, b = fleb[i2];
-          add = bits(dat, pos, (1 << b) - 1) + fl[i2];
+          add2 = bits(dat, pos, (1 << b) - 1) + fl[i2];
           pos += b;
         }
         var d = dm[bits16(dat, pos) & dms], dsym = d >> 4;
@@ -46017,7 +46017,7 @@ var inflt = function(dat, st, buf, dict) {
         }
         if (resize)
           cbuf(bt + 131072);
-        var end = bt + add;
+        var end = bt + add2;
         if (bt < dt) {
           var shift = dl - dt, dend = Math.min(dt, end);
           if (shift + bt < 0)
@@ -46120,7 +46120,7 @@ function listEntries(zip, label) {
   const count2 = view.getUint16(eocd + 10, true);
   let offset = view.getUint32(eocd + 16, true);
   if (count2 === 65535 || offset === 4294967295) refuse(label, "must not be a ZIP64 archive");
-  const decoder = new TextDecoder();
+  const decoder3 = new TextDecoder();
   const entries = [];
   for (let i2 = 0; i2 < count2; i2++) {
     if (offset + 46 > zip.length || view.getUint32(offset, true) !== CENTRAL) {
@@ -46135,7 +46135,7 @@ function listEntries(zip, label) {
     const commentLength = view.getUint16(offset + 32, true);
     const external = view.getUint32(offset + 38, true);
     const localOffset = view.getUint32(offset + 42, true);
-    const name = decoder.decode(zip.subarray(offset + 46, offset + 46 + nameLength));
+    const name = decoder3.decode(zip.subarray(offset + 46, offset + 46 + nameLength));
     const problem = unsafeName(name);
     if (problem !== null) {
       refuse(
@@ -46346,197 +46346,252 @@ function formatLimit(value2) {
   return String(value2);
 }
 
-// src/model/settings.ts
-var FAIL_ON_VALUES = [
-  "worse-validation",
-  "toward-overfitting",
-  "toward-underfitting",
-  "worse-on-both",
-  "any-movement",
-  "slice-regression",
-  "high-bias",
-  "high-variance",
-  "data-mismatch",
-  "validation-overfit",
-  "guardrail-regression",
-  "guardrail-undetermined",
-  "none"
-];
-var COST_OUTCOME_FIELDS = /* @__PURE__ */ new Map([
-  ["train-seconds", "trainSeconds"],
-  ["inference-ms", "inferenceMs"],
-  ["parameters", "parameters"],
-  ["memory-mb", "memoryMb"]
-]);
-var COST_RATIO_OUTCOME = /^(train-seconds|inference-ms|parameters|memory-mb)-ratio>((?:0|[1-9][0-9]*)(?:\.[0-9]+)?)$/;
-function isFailOn(value2) {
-  return FAIL_ON_VALUES.includes(value2) || COST_RATIO_OUTCOME.test(value2);
-}
-var DEFAULT_SETTINGS = {
-  alpha: 0.05,
-  minEffect: 0,
-  gapTolerance: 0.1,
-  failOn: ["worse-validation"]
-};
-var NUMBER_SETTINGS = {
-  alpha: { min: 1e-6, max: 0.5, about: "significance level" },
-  "min-effect": { min: 0, max: MAX_MAGNITUDE, about: "smallest change that counts" },
-  "gap-tolerance": { min: 0, max: 1, about: "component present at this fraction of the error" },
-  reference: { min: -MAX_MAGNITUDE, max: MAX_MAGNITUDE, about: "reference level" }
-};
-var DECIMAL = /^[+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:[eE][+-]?\d+)?$/;
-function parseDecimal(text2) {
-  const trimmed = text2.trim();
-  if (!DECIMAL.test(trimmed)) return null;
-  const value2 = Number(trimmed);
-  return Number.isFinite(value2) ? value2 : null;
-}
-function rangeText(name) {
-  const { min, max: max2 } = NUMBER_SETTINGS[name];
-  return `must be a number from ${formatLimit(min)} to ${formatLimit(max2)}`;
-}
-function numberSettingIssues(name, value2, source) {
-  const { min, max: max2 } = NUMBER_SETTINGS[name];
-  if (Number.isFinite(value2) && value2 >= min && value2 <= max2) return [];
-  return [{ ...source, expected: rangeText(name), got: quote(value2) }];
-}
-function parseNumberSetting(name, text2, source) {
-  const value2 = parseDecimal(text2);
-  if (value2 === null)
-    return { issues: [{ ...source, expected: rangeText(name), got: quote(text2) }] };
-  const issues = numberSettingIssues(name, value2, source);
-  return issues.length > 0 ? { issues } : { value: value2 };
-}
-var FAIL_ON_SEPARATORS = /[,\n]/;
-function failOnIssues(values, source) {
-  const at = (i2) => source.pointer === "" ? "" : `${source.pointer}/${i2}`;
-  if (values.length === 0) {
-    return [
-      {
-        ...source,
-        expected: "must name at least one outcome",
-        got: "an empty list",
-        hint: "Write 'none' for a gate that never fails, or leave the setting out for the default (worse-validation)."
-      }
-    ];
-  }
-  const issues = values.flatMap(
-    (value2, i2) => isFailOn(value2) ? [] : [
-      {
-        ...source,
-        pointer: at(i2),
-        expected: `must be one of ${FAIL_ON_VALUES.join(", ")}, or FIELD-ratio>X (FIELD one of ${[...COST_OUTCOME_FIELDS.keys()].join(", ")})`,
-        got: quote(value2),
-        hint: "Separate outcomes with commas or new lines."
-      }
-    ]
-  );
-  if (issues.length === 0 && values.length > 1 && values.includes("none")) {
-    issues.push({
-      ...source,
-      pointer: at(values.indexOf("none")),
-      expected: "must not combine 'none' with other outcomes",
-      got: quote(values.join(","))
-    });
-  }
-  return issues;
-}
-function parseFailOn(text2, source) {
-  const values = text2.split(FAIL_ON_SEPARATORS).map((s) => s.trim()).filter((s) => s !== "");
-  const issues = failOnIssues(values, source);
-  return issues.length > 0 ? { issues } : { value: values };
-}
+// src/artifact/curve-logs/limits.ts
+var MAX_POINTS = 1e6;
+var MAX_SERIES = 1e4;
+var MAX_TEXT_BYTES = 64 * 1024 * 1024;
+var MAX_EVENT_FILE_BYTES = 512 * 1024 * 1024;
 
-// src/artifact/epoch-log.ts
-function splitCsvLine(line) {
-  return line.split(",").map((cell) => cell.trim().replace(/^"(.*)"$/, "$1"));
+// src/artifact/curve-logs/text.ts
+var decoder = new TextDecoder("utf-8", { fatal: true });
+function decodeText(input, file, what) {
+  if (typeof input !== "string" && input.length > MAX_TEXT_BYTES) {
+    throw new InputError([
+      {
+        file,
+        pointer: "",
+        expected: `must be at most ${MAX_TEXT_BYTES / 1024 / 1024} MiB for ${what}`,
+        got: `${input.length} bytes`,
+        hint: "Import a shorter log, or thin it out before importing."
+      }
+    ]);
+  }
+  let text2;
+  try {
+    text2 = typeof input === "string" ? input : decoder.decode(input);
+  } catch {
+    throw new InputError([
+      {
+        file,
+        pointer: "",
+        expected: `must be UTF-8 text (${what})`,
+        hint: "Check that the file is the log itself and not a binary or compressed file."
+      }
+    ]);
+  }
+  return text2.charCodeAt(0) === 65279 ? text2.slice(1) : text2;
 }
-function parseEpochLog(text2, file, mapping) {
-  const lines = text2.replace(/^\uFEFF/, "").split(/\r?\n/);
+var DECIMAL = /^[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?$/;
+function parseDecimal(text2) {
+  const t = text2.trim();
+  if (DECIMAL.test(t)) return Number(t);
+  if (/^[+-]?(?:nan|inf|infinity)$/i.test(t)) return /nan/i.test(t) ? Number.NaN : Infinity;
+  return void 0;
+}
+function notFinite(file, pointer, what, got, bound) {
+  const value2 = parseDecimal(got);
+  const nonFinite = value2 !== void 0 && !Number.isFinite(value2);
+  return {
+    file,
+    pointer,
+    expected: bound === void 0 ? `${what} must be a finite number` : `${what} must be a decimal number within \xB1${formatLimit(bound)}`,
+    got: quote(got),
+    ...nonFinite ? {
+      hint: "The run logged NaN or infinity here (it may have diverged); cut the log before this point or pick another series."
+    } : value2 !== void 0 ? {
+      hint: "Rescale the values (thousands instead of units); larger ones overflow in the statistics."
+    } : {}
+  };
+}
+var PointBudget = class {
+  constructor(limit = MAX_POINTS) {
+    this.limit = limit;
+  }
+  limit;
+  used = 0;
+  take(file, pointer) {
+    this.used++;
+    if (this.used > this.limit) {
+      throw new InputError([
+        {
+          file,
+          pointer,
+          expected: `holds more than ${this.limit.toLocaleString("en-US")} points, the most one import reads`,
+          hint: "Import fewer files, or log less often (per epoch rather than per step)."
+        }
+      ]);
+    }
+  }
+};
+
+// src/artifact/curve-logs/csv-log.ts
+function splitCsvLine(line) {
+  if (!line.includes('"')) return line.split(",").map((cell2) => cell2.trim());
+  const cells = [];
+  let cell = "";
+  let quoted = false;
+  for (let i2 = 0; i2 < line.length; i2++) {
+    const c = line[i2];
+    if (quoted) {
+      if (c === '"') {
+        if (line[i2 + 1] === '"') {
+          cell += '"';
+          i2++;
+        } else quoted = false;
+      } else cell += c;
+    } else if (c === '"' && cell.trim() === "") {
+      cell = "";
+      quoted = true;
+    } else if (c === ",") {
+      cells.push(cell.trim());
+      cell = "";
+    } else cell += c;
+  }
+  if (quoted) return null;
+  cells.push(cell.trim());
+  return cells;
+}
+function structural(file, line, expected, got, hint) {
+  const issue2 = { file, pointer: `line ${line}`, expected };
+  if (got !== void 0) issue2.got = got;
+  if (hint !== void 0) issue2.hint = hint;
+  return new InputError([issue2]);
+}
+function readCsvLog(input, file, options = {}) {
+  const text2 = decodeText(input, file, "a CSV log");
+  const budget = options.budget ?? new PointBudget();
+  const bound = options.maxMagnitude;
+  const lines = text2.split(/\r?\n/);
   const header = splitCsvLine(lines[0] ?? "");
+  if (header === null || header.every((h) => h === "")) {
+    throw structural(
+      file,
+      1,
+      'must be a header row naming the columns, such as "epoch,loss,val_loss"',
+      quote(lines[0] ?? "")
+    );
+  }
+  if (header.length > MAX_SERIES + 1)
+    throw structural(file, 1, `must have at most ${MAX_SERIES} columns`, `${header.length}`);
   const seen = /* @__PURE__ */ new Map();
   header.forEach((name, i2) => {
+    if (name === "") return;
     const first = seen.get(name);
-    if (first !== void 0) {
-      throw new InputError([
-        {
-          file,
-          pointer: "line 1",
-          expected: `must name each column once (column ${i2 + 1} repeats column ${first + 1})`,
-          got: quote(name),
-          hint: "Rename one of the columns; a repeated name makes the mapping ambiguous."
-        }
-      ]);
-    }
+    if (first !== void 0)
+      throw structural(
+        file,
+        1,
+        `must name each column once (column ${i2 + 1} repeats column ${first + 1})`,
+        quote(name),
+        "Rename one of the columns; a repeated name makes the choice of series ambiguous."
+      );
     seen.set(name, i2);
   });
-  const column = (name, role) => {
-    if (name === void 0) return void 0;
-    const index = header.indexOf(name);
-    if (index < 0) {
-      throw new InputError([
-        {
-          file,
-          pointer: "line 1",
-          expected: `must have the column "${name}" (epoch-log ${role} in the config)`,
-          got: quote(header.join(",")),
-          hint: "Change epoch-log in the config to name one of the header columns."
-        }
-      ]);
-    }
-    return index;
+  const shownHeader = quote(header.join(","));
+  const missing = (name, role) => {
+    const by = options.namedBy?.(role);
+    return structural(
+      file,
+      1,
+      `must have the column "${name}"${by === void 0 ? "" : ` (${by})`}`,
+      shownHeader,
+      by === void 0 ? "Name one of the header columns." : `Change ${by} to name one of the header columns.`
+    );
   };
-  const xi = column(mapping.x, "x") ?? 0;
-  const ti = column(mapping.train, "train");
-  const vi = column(mapping.validation, "validation") ?? 0;
-  const points = [];
-  const issues = [];
-  for (let i2 = 1; i2 < lines.length; i2++) {
+  const xName = options.x ?? (seen.has("epoch") ? "epoch" : seen.has("step") ? "step" : void 0);
+  if (xName === void 0) {
+    throw structural(
+      file,
+      1,
+      'must have an "epoch" or "step" column for x',
+      shownHeader,
+      "Name the x column (--x, or x in the config)."
+    );
+  }
+  const xi = seen.get(xName);
+  if (xi === void 0) throw missing(xName, "x");
+  for (const { name, role } of options.columns ?? []) {
+    if (!seen.has(name)) throw missing(name, role);
+    if (name === xName)
+      throw structural(
+        file,
+        1,
+        `must not use the x column "${xName}" for ${options.namedBy?.(role) ?? role} as well`,
+        shownHeader,
+        "Name a column of values, not the one that counts epochs or steps."
+      );
+  }
+  const wanted = options.columns === void 0 ? void 0 : new Set(options.columns.map((c) => c.name));
+  const where = { kind: "line" };
+  const series = header.map(
+    (name, c) => c === xi || name === "" || wanted?.has(name) === false ? void 0 : { name, file, x: xName, where, points: [], problems: [] }
+  );
+  const usable3 = (v) => v !== void 0 && Number.isFinite(v) && (bound === void 0 || Math.abs(v) <= bound);
+  const xIssues = [];
+  let rows = 0;
+  for (let i2 = 1; i2 < lines.length && xIssues.length < 10; i2++) {
     const raw = lines[i2] ?? "";
     if (raw.trim() === "") continue;
+    const line = i2 + 1;
+    rows++;
+    if (options.maxRows !== void 0 && rows > options.maxRows)
+      throw structural(
+        file,
+        line,
+        `must have at most ${options.maxRows} data rows`,
+        void 0,
+        "Log less often, or keep every n-th row."
+      );
     const cells = splitCsvLine(raw);
-    const read = (index, name) => {
-      const cell = cells[index] ?? "";
-      const value2 = parseDecimal(cell) ?? Number.NaN;
-      if (!Number.isFinite(value2) || Math.abs(value2) > MAX_MAGNITUDE) {
-        issues.push({
-          file,
-          pointer: `line ${i2 + 1}`,
-          expected: `column "${name}" must be a decimal number within \xB1${formatLimit(MAX_MAGNITUDE)}`,
-          got: quote(cell)
-        });
-        return Number.NaN;
-      }
-      return value2;
-    };
-    const point = { x: read(xi, mapping.x), validation: read(vi, mapping.validation) };
-    if (ti !== void 0 && mapping.train !== void 0) point.train = read(ti, mapping.train);
-    const previous = points[points.length - 1];
-    if (previous !== void 0 && Number.isFinite(point.x) && !(point.x > previous.x)) {
-      issues.push({
+    if (cells === null) throw structural(file, line, "must close every quoted cell", quote(raw));
+    if (cells.length > header.length)
+      throw structural(
         file,
-        pointer: `line ${i2 + 1}`,
-        expected: `column "${mapping.x}" must strictly increase (previous ${previous.x})`,
-        got: quote(point.x)
-      });
+        line,
+        `must have at most ${header.length} cells, one per header column`,
+        `${cells.length}`,
+        "Quote cells that contain commas, or fix the header."
+      );
+    const xCell = cells[xi] ?? "";
+    const x2 = xCell === "" ? Number.NaN : parseDecimal(xCell);
+    if (!usable3(x2)) {
+      xIssues.push(notFinite(file, `line ${line}`, `column "${xName}"`, xCell, bound));
+      continue;
     }
-    points.push(point);
-    if (issues.length >= 10) break;
-    if (points.length > MAX_CURVE_POINTS) {
-      issues.push({
-        file,
-        pointer: `line ${i2 + 1}`,
-        expected: `must have at most ${MAX_CURVE_POINTS} data rows (a curve's limit)`,
-        hint: "Log less often, or keep every n-th row."
-      });
-      break;
+    for (let c = 0; c < header.length; c++) {
+      const s = series[c];
+      if (s === void 0) continue;
+      const cell = cells[c] ?? "";
+      if (cell === "" && options.blank !== "refuse") continue;
+      const value2 = parseDecimal(cell);
+      if (!usable3(value2)) {
+        if (s.problems.length < 10)
+          s.problems.push(notFinite(file, `line ${line}`, `column "${s.name}"`, cell, bound));
+        continue;
+      }
+      budget.take(file, `line ${line}`);
+      s.points.push({ x: x2, value: value2, at: line });
     }
   }
-  if (issues.length > 0) throw new InputError(issues);
-  if (points.length === 0)
-    throw new InputError([{ file, pointer: "", expected: "has no data rows under its header" }]);
-  return points;
+  if (xIssues.length > 0) throw new InputError(xIssues);
+  return { series: series.filter((s) => s !== void 0), warnings: [] };
 }
+
+// src/artifact/curve-logs/protobuf.ts
+var SCRATCH = new Uint8Array(8);
+var SCRATCH_VIEW = new DataView(SCRATCH.buffer);
+var decoder2 = new TextDecoder("utf-8", { fatal: true });
+
+// src/artifact/curve-logs/crc32c.ts
+var TABLE = (() => {
+  const table2 = new Uint32Array(256);
+  for (let n = 0; n < 256; n++) {
+    let c = n;
+    for (let k = 0; k < 8; k++) c = c & 1 ? c >>> 1 ^ 2197175160 : c >>> 1;
+    table2[n] = c >>> 0;
+  }
+  return table2;
+})();
 
 // src/validate/ajv-issues.ts
 function valueAt(doc, pointer) {
@@ -46769,6 +46824,455 @@ function parseJson(text2, file) {
     );
   }
   return doc;
+}
+
+// src/artifact/curve-logs/names.ts
+var TRAIN_WORDS = /* @__PURE__ */ new Set(["train", "training", "learn", "trn"]);
+var VALIDATION_RANK = /* @__PURE__ */ new Map([
+  ["val", 0],
+  ["valid", 0],
+  ["validation", 0],
+  ["eval", 0],
+  ["evaluation", 0],
+  ["dev", 0],
+  ["test", 3]
+]);
+var NUMBERED = /^(?:val|valid|validation|eval)_(\d+)$/;
+var NOT_A_METRIC = /^(?:epochs?|steps?|global_step|iter(?:ation)?s?|batch(?:es)?|lr|learning_rate|lr[-_].*|time.*|duration|hp_metric|momentum|weight_decay|grad_norm)$/;
+function roleOfWord(word2) {
+  const w = word2.toLowerCase();
+  if (TRAIN_WORDS.has(w)) return { role: "train", rank: 0 };
+  const rank = VALIDATION_RANK.get(w);
+  if (rank !== void 0) return { role: "validation", rank };
+  const numbered = NUMBERED.exec(w);
+  if (numbered?.[1] !== void 0)
+    return { role: "validation", rank: 1 + Number(numbered[1]) / 1e6 };
+  return void 0;
+}
+function normalizeBase(text2) {
+  let base = text2.toLowerCase();
+  let stage = 0;
+  const last = base.lastIndexOf("/") + 1;
+  let leaf = base.slice(last);
+  if (leaf.startsWith("epoch_") && leaf.length > 6) leaf = leaf.slice(6);
+  const suffix = /^(.+)_(epoch|step)$/.exec(leaf);
+  if (suffix?.[1] !== void 0) {
+    leaf = suffix[1];
+    stage = suffix[2] === "epoch" ? 0.1 : 0.2;
+  }
+  base = base.slice(0, last) + leaf;
+  return { base, stage };
+}
+function parseName(name) {
+  const segments = name.split("/");
+  for (let i2 = segments.length - 1; i2 >= 0; i2--) {
+    const found = roleOfWord(segments[i2] ?? "");
+    if (found === void 0) continue;
+    const after = segments.slice(i2 + 1).join("/");
+    const before = segments.slice(0, i2).join("/");
+    const { base: base2, stage: stage2 } = normalizeBase(after !== "" ? after : before);
+    if (base2 === "" || NOT_A_METRIC.test(base2.slice(base2.lastIndexOf("/") + 1))) return void 0;
+    return {
+      name,
+      role: found.role,
+      base: base2,
+      qualifier: after !== "" ? before.toLowerCase() : "",
+      rank: found.rank + stage2,
+      set: (segments[i2] ?? "").toLowerCase()
+    };
+  }
+  const leaf = segments[segments.length - 1] ?? "";
+  const qualifier = segments.slice(0, -1).join("/").toLowerCase();
+  let role = "train";
+  let rank = 0.5;
+  let rest = leaf;
+  const prefix = /^([A-Za-z]+(?:_\d+)?)_(.+)$/.exec(leaf);
+  const suffix = /^(.+)_([A-Za-z]+)$/.exec(leaf);
+  const byPrefix = prefix?.[1] === void 0 ? void 0 : roleOfWord(prefix[1]);
+  const bySuffix = suffix?.[2] === void 0 ? void 0 : roleOfWord(suffix[2]);
+  if (byPrefix !== void 0 && prefix?.[2] !== void 0) {
+    ({ role, rank } = byPrefix);
+    rest = prefix[2];
+  } else if (bySuffix !== void 0 && suffix?.[1] !== void 0) {
+    ({ role, rank } = bySuffix);
+    rest = suffix[1];
+  }
+  const { base, stage } = normalizeBase(rest);
+  if (base === "" || NOT_A_METRIC.test(base)) return void 0;
+  return { name, role, base, qualifier, rank: rank + stage };
+}
+
+// src/artifact/curve-logs/units.ts
+var FAMILY = /* @__PURE__ */ new Map();
+var add = (family, names2) => names2.forEach((n) => FAMILY.set(n, family));
+add("accuracy", [
+  "accuracy",
+  "acc",
+  "binary_accuracy",
+  "categorical_accuracy",
+  "sparse_categorical_accuracy",
+  "top1_accuracy"
+]);
+add("error", [
+  "error",
+  "err",
+  "error_rate",
+  "binary_error",
+  "multi_error",
+  "merror",
+  "misclassification_rate",
+  "zero_one_loss"
+]);
+add("loss", ["loss", "total_loss", "objective"]);
+add("logloss", [
+  "logloss",
+  "log_loss",
+  "binary_logloss",
+  "multi_logloss",
+  "mlogloss",
+  "cross_entropy",
+  "crossentropy",
+  "binary_crossentropy",
+  "categorical_crossentropy",
+  "sparse_categorical_crossentropy",
+  "nll",
+  "multiclass"
+]);
+add("rmse", ["rmse", "root_mean_squared_error"]);
+add("mse", ["mse", "l2", "mean_squared_error"]);
+add("mae", ["mae", "l1", "mean_absolute_error"]);
+add("auc", ["auc", "roc_auc", "auroc"]);
+add("r2", ["r2", "r2_score", "r_squared"]);
+function normalizeMetricName(name) {
+  return name.toLowerCase().replace(/[^a-z0-9]+/g, "_").replace(/^_+|_+$/g, "");
+}
+function familyOf(name) {
+  const leaf = name.slice(name.lastIndexOf("/") + 1);
+  return FAMILY.get(normalizeMetricName(leaf));
+}
+function isLoss(family) {
+  return family === "loss" || family === "logloss";
+}
+var CONVERSIONS = /* @__PURE__ */ new Map([
+  ["accuracy>error", "one-minus"],
+  ["error>accuracy", "one-minus"],
+  ["mse>rmse", "sqrt"],
+  ["rmse>mse", "square"]
+]);
+function convert(conversion, value2) {
+  if (conversion === "one-minus") return 1 - value2;
+  if (conversion === "sqrt") return Math.sqrt(value2);
+  return value2 * value2;
+}
+function matchScore(base, metric) {
+  const b = normalizeMetricName(base.slice(base.lastIndexOf("/") + 1));
+  const m = normalizeMetricName(metric);
+  if (b === m) return 0;
+  const bf = familyOf(b);
+  const mf = familyOf(m);
+  if (bf === void 0 || mf === void 0) return void 0;
+  if (bf === mf) return 1;
+  return CONVERSIONS.has(`${bf}>${mf}`) ? 2 : void 0;
+}
+function unitsFor(base, series, metric) {
+  const bf = familyOf(base);
+  if (metric === void 0) {
+    return {
+      warning: isLoss(bf) ? { code: "loss-not-metric", series } : { code: "units-unchecked", series }
+    };
+  }
+  const score = matchScore(base, metric);
+  if (score === 0 || score === 1) return {};
+  const mf = familyOf(metric);
+  const conversion = bf !== void 0 && mf !== void 0 ? CONVERSIONS.get(`${bf}>${mf}`) : void 0;
+  if (conversion !== void 0)
+    return { conversion, warning: { code: "converted", series, metric, conversion } };
+  if (isLoss(bf)) return { warning: { code: "loss-not-metric", series, metric } };
+  return { warning: { code: "units-unchecked", series, metric } };
+}
+
+// src/artifact/curve-logs/picker.ts
+var byRank = (a, b) => a.rank - b.rank;
+function groups(series) {
+  const map = /* @__PURE__ */ new Map();
+  series.forEach((s, index) => {
+    const parts = parseName(s.name);
+    if (parts === void 0) return;
+    const key = `${parts.qualifier}\0${parts.base}`;
+    let group = map.get(key);
+    if (group === void 0) {
+      group = {
+        base: parts.base,
+        qualifier: parts.qualifier,
+        train: [],
+        validation: [],
+        last: index
+      };
+      map.set(key, group);
+    }
+    group[parts.role].push(parts);
+    group.last = index;
+  });
+  for (const g of map.values()) {
+    g.train.sort(byRank);
+    g.validation.sort(byRank);
+  }
+  return [...map.values()];
+}
+function guessPositional(g) {
+  const positional = g.validation.filter((p) => /^validation_\d+$/.test(p.set ?? ""));
+  if (g.train.length > 0 || positional.length < 2 || positional.length !== g.validation.length)
+    return void 0;
+  const [train, validation] = positional;
+  return train === void 0 || validation === void 0 ? void 0 : { train, validation };
+}
+function notFound(catalogue, name, series, flag) {
+  const names2 = series.map((s) => s.name);
+  const close = names2.find((n) => n.toLowerCase() === name.toLowerCase());
+  const listed = names2.slice(0, 12).map((n) => JSON.stringify(n)).join(", ");
+  return new InputError([
+    {
+      file: catalogue.file,
+      pointer: catalogue.pointer,
+      expected: `must have the ${catalogue.noun} "${name}" (${flag})`,
+      got: names2.length === 0 ? "none" : `${listed}${names2.length > 12 ? ", \u2026" : ""}`,
+      hint: close !== void 0 ? `Names are case-sensitive: did you mean "${close}"?` : `Name one of the ${catalogue.noun}s listed.`
+    }
+  ]);
+}
+function partner(all, name, role) {
+  const parts = parseName(name);
+  if (parts === void 0) return void 0;
+  const group = all.find((g) => g.base === parts.base && g.qualifier === parts.qualifier);
+  return group?.[role][0]?.name;
+}
+function pickByFlags(series, options, catalogue) {
+  const find = (name, flag) => {
+    const s = series.find((x2) => x2.name === name);
+    if (s === void 0) throw notFound(catalogue, name, series, flag);
+    return s;
+  };
+  const all = groups(series);
+  const lookUp = options.exact !== true;
+  const validationName = options.validation ?? (options.train === void 0 || !lookUp ? void 0 : partner(all, options.train, "validation"));
+  if (validationName === void 0) {
+    throw new InputError([
+      {
+        file: catalogue.file,
+        pointer: catalogue.pointer,
+        expected: `must have a validation ${catalogue.noun} to go with "${options.train}"`,
+        hint: "Name it with --validation."
+      }
+    ]);
+  }
+  const validation = find(validationName, "validation");
+  const trainName = options.train ?? (options.validation === void 0 || !lookUp ? void 0 : partner(all, validationName, "train"));
+  const train = trainName === void 0 ? void 0 : find(trainName, "train");
+  const warnings = [];
+  if (train === void 0) warnings.push({ code: "no-train-series", validation: validation.name });
+  return {
+    validation,
+    ...train === void 0 ? {} : { train },
+    by: "flags",
+    base: parseName(validationName)?.base ?? validationName,
+    alternatives: [],
+    warnings
+  };
+}
+function pickSeries(series, options, catalogue) {
+  if (options.train !== void 0 || options.validation !== void 0)
+    return pickByFlags(series, options, catalogue);
+  const all = groups(series).filter((g) => g.validation.length > 0);
+  if (all.length === 0) {
+    throw new InputError([
+      {
+        file: catalogue.file,
+        pointer: catalogue.pointer,
+        expected: `must have a validation ${catalogue.noun} (such as "val_loss", "val/loss" or an eval set)`,
+        got: series.length === 0 ? "none" : series.slice(0, 12).map((s) => JSON.stringify(s.name)).join(", "),
+        hint: "Name the series to use with --validation (and --train)."
+      }
+    ]);
+  }
+  const metric = options.metric;
+  const score = (g) => {
+    const m = metric === void 0 ? void 0 : matchScore(g.base, metric);
+    if (m !== void 0) return m;
+    return g.base === "loss" ? 10 : 20 - g.last / (series.length + 1);
+  };
+  const ranked = [...all].sort((a, b) => score(a) - score(b));
+  const best = ranked[0];
+  const rivals = ranked.filter((g) => g.base === best.base && g.qualifier !== best.qualifier);
+  if (rivals.length > 0) {
+    const runs = [best, ...rivals].map(
+      (g) => quote(g.qualifier === "" ? "(top level)" : g.qualifier)
+    );
+    throw new InputError([
+      {
+        file: catalogue.file,
+        pointer: "",
+        expected: `must hold one run, but several log "${best.base}"`,
+        got: runs.join(", "),
+        hint: "Name one run folder as PATH, or name the series with --train and --validation."
+      }
+    ]);
+  }
+  const warnings = [];
+  const guessed = guessPositional(best);
+  const validationParts = guessed?.validation ?? best.validation[0];
+  const trainParts = guessed?.train ?? best.train[0];
+  if (guessed !== void 0)
+    warnings.push({
+      code: "eval-sets-guessed",
+      train: guessed.train.name,
+      validation: guessed.validation.name
+    });
+  const validation = series.find((s) => s.name === validationParts.name);
+  const train = trainParts === void 0 ? void 0 : series.find((s) => s.name === trainParts.name);
+  if (train === void 0) warnings.push({ code: "no-train-series", validation: validation.name });
+  return {
+    validation,
+    ...train === void 0 ? {} : { train },
+    by: "names",
+    base: best.base,
+    alternatives: ranked.slice(1).map((g) => g.validation[0].name),
+    warnings
+  };
+}
+
+// src/artifact/curve-logs/types.ts
+function pointerOf(where, at) {
+  if (where.kind === "json") return `${where.path}/${at}`;
+  return `${where.kind} ${at}`;
+}
+
+// src/artifact/curve-logs/curve.ts
+function collapse(series, mode, warnings) {
+  const means = /* @__PURE__ */ new Map();
+  let previous;
+  for (const p of series.points) {
+    if (mode === "reject" && previous !== void 0 && !(p.x > previous.x)) {
+      const x2 = series.where.kind === "line" ? `column "${series.x}"` : `"${series.x}"`;
+      throw new InputError([
+        {
+          file: series.file,
+          pointer: pointerOf(series.where, p.at),
+          expected: `${x2} must strictly increase (previous ${previous.x} at ${pointerOf(series.where, previous.at)})`,
+          got: String(p.x),
+          hint: p.x === previous.x ? "Keep one value per x: drop the repeated ones (a resumed run logs some twice)." : "Sort the rows by x, or cut the log where x starts again."
+        }
+      ]);
+    }
+    previous = p;
+    const entry = means.get(p.x);
+    if (entry === void 0) means.set(p.x, { mean: p.value, n: 1 });
+    else {
+      entry.n++;
+      entry.mean += p.value / entry.n - entry.mean / entry.n;
+    }
+  }
+  let merged = 0;
+  const out = /* @__PURE__ */ new Map();
+  for (const [x2, { mean: mean2, n }] of means) {
+    if (n > 1) merged++;
+    out.set(x2, mean2);
+  }
+  if (merged > 0) warnings.push({ code: "duplicates-averaged", series: series.name, xs: merged });
+  return out;
+}
+function buildCurve(read, catalogue, options = {}) {
+  const picked = pickSeries(read.series, options, catalogue);
+  const warnings = [...read.warnings, ...picked.warnings];
+  const mode = options.duplicates ?? "average";
+  const { validation, train } = picked;
+  const units = options.exact === true ? {} : unitsFor(picked.base, validation.name, options.metric);
+  if (units.warning !== void 0) warnings.push(units.warning);
+  const conversion = units.conversion;
+  const toMetric = (v) => {
+    if (conversion === void 0) return v;
+    const converted = convert(conversion, v);
+    if (!Number.isFinite(converted))
+      throw new InputError([
+        {
+          file: validation.file,
+          pointer: "",
+          expected: `must have values that stay finite in the metric's units (${conversion})`,
+          got: String(v)
+        }
+      ]);
+    return converted;
+  };
+  const problems = [
+    ...validation.problems,
+    ...train === void 0 || train === validation ? [] : train.problems
+  ];
+  if (problems.length > 0) throw new InputError(problems);
+  const validationByX = collapse(validation, mode, warnings);
+  const trainByX = train === void 0 ? void 0 : collapse(train, mode, warnings);
+  if (validationByX.size === 0) {
+    throw new InputError([
+      {
+        file: validation.file,
+        pointer: "",
+        expected: `must have at least one value of "${validation.name}"`,
+        hint: "Check that the run got as far as a validation pass, or name another series."
+      }
+    ]);
+  }
+  const xs = [...validationByX.keys()].sort((a, b) => a - b);
+  let missing = 0;
+  const points = xs.map((x2) => {
+    const point = { x: x2, validation: toMetric(validationByX.get(x2)) };
+    const t = trainByX?.get(x2);
+    if (t !== void 0) point.train = toMetric(t);
+    else if (trainByX !== void 0) missing++;
+    return point;
+  });
+  if (train !== void 0 && trainByX !== void 0) {
+    if (missing > 0) warnings.push({ code: "train-missing", series: train.name, points: missing });
+    let dropped = 0;
+    for (const x2 of trainByX.keys()) if (!validationByX.has(x2)) dropped++;
+    if (dropped > 0)
+      warnings.push({ code: "train-only-dropped", series: train.name, points: dropped });
+  }
+  const files = [.../* @__PURE__ */ new Set([validation.file, ...train === void 0 ? [] : [train.file]])];
+  return {
+    points,
+    validation: validation.name,
+    ...train === void 0 ? {} : { train: train.name },
+    by: picked.by,
+    x: validation.x,
+    files,
+    alternatives: picked.alternatives,
+    warnings
+  };
+}
+
+// src/artifact/epoch-log.ts
+var namedBy = (role) => `epoch-log ${role} in the config`;
+function parseEpochLog(text2, file, mapping) {
+  const read = readCsvLog(text2, file, {
+    x: mapping.x,
+    columns: [
+      ...mapping.train === void 0 ? [] : [{ role: "train", name: mapping.train }],
+      { role: "validation", name: mapping.validation }
+    ],
+    namedBy,
+    blank: "refuse",
+    maxMagnitude: MAX_MAGNITUDE,
+    maxRows: MAX_CURVE_POINTS
+  });
+  const curve = buildCurve(
+    read,
+    { file, pointer: "line 1", noun: "column" },
+    {
+      validation: mapping.validation,
+      ...mapping.train === void 0 ? {} : { train: mapping.train },
+      exact: true,
+      duplicates: "reject"
+    }
+  );
+  return curve.points;
 }
 
 // src/validate/run.ts
@@ -47698,6 +48202,107 @@ function sideSources(commit, artifact, beside, from) {
 // src/io/review-from-files.ts
 import { createHash as createHash3 } from "node:crypto";
 import { resolve as resolve3 } from "node:path";
+
+// src/model/settings.ts
+var FAIL_ON_VALUES = [
+  "worse-validation",
+  "toward-overfitting",
+  "toward-underfitting",
+  "worse-on-both",
+  "any-movement",
+  "slice-regression",
+  "high-bias",
+  "high-variance",
+  "data-mismatch",
+  "validation-overfit",
+  "guardrail-regression",
+  "guardrail-undetermined",
+  "none"
+];
+var COST_OUTCOME_FIELDS = /* @__PURE__ */ new Map([
+  ["train-seconds", "trainSeconds"],
+  ["inference-ms", "inferenceMs"],
+  ["parameters", "parameters"],
+  ["memory-mb", "memoryMb"]
+]);
+var COST_RATIO_OUTCOME = /^(train-seconds|inference-ms|parameters|memory-mb)-ratio>((?:0|[1-9][0-9]*)(?:\.[0-9]+)?)$/;
+function isFailOn(value2) {
+  return FAIL_ON_VALUES.includes(value2) || COST_RATIO_OUTCOME.test(value2);
+}
+var DEFAULT_SETTINGS = {
+  alpha: 0.05,
+  minEffect: 0,
+  gapTolerance: 0.1,
+  failOn: ["worse-validation"]
+};
+var NUMBER_SETTINGS = {
+  alpha: { min: 1e-6, max: 0.5, about: "significance level" },
+  "min-effect": { min: 0, max: MAX_MAGNITUDE, about: "smallest change that counts" },
+  "gap-tolerance": { min: 0, max: 1, about: "component present at this fraction of the error" },
+  reference: { min: -MAX_MAGNITUDE, max: MAX_MAGNITUDE, about: "reference level" }
+};
+var DECIMAL2 = /^[+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:[eE][+-]?\d+)?$/;
+function parseDecimal2(text2) {
+  const trimmed = text2.trim();
+  if (!DECIMAL2.test(trimmed)) return null;
+  const value2 = Number(trimmed);
+  return Number.isFinite(value2) ? value2 : null;
+}
+function rangeText(name) {
+  const { min, max: max2 } = NUMBER_SETTINGS[name];
+  return `must be a number from ${formatLimit(min)} to ${formatLimit(max2)}`;
+}
+function numberSettingIssues(name, value2, source) {
+  const { min, max: max2 } = NUMBER_SETTINGS[name];
+  if (Number.isFinite(value2) && value2 >= min && value2 <= max2) return [];
+  return [{ ...source, expected: rangeText(name), got: quote(value2) }];
+}
+function parseNumberSetting(name, text2, source) {
+  const value2 = parseDecimal2(text2);
+  if (value2 === null)
+    return { issues: [{ ...source, expected: rangeText(name), got: quote(text2) }] };
+  const issues = numberSettingIssues(name, value2, source);
+  return issues.length > 0 ? { issues } : { value: value2 };
+}
+var FAIL_ON_SEPARATORS = /[,\n]/;
+function failOnIssues(values, source) {
+  const at = (i2) => source.pointer === "" ? "" : `${source.pointer}/${i2}`;
+  if (values.length === 0) {
+    return [
+      {
+        ...source,
+        expected: "must name at least one outcome",
+        got: "an empty list",
+        hint: "Write 'none' for a gate that never fails, or leave the setting out for the default (worse-validation)."
+      }
+    ];
+  }
+  const issues = values.flatMap(
+    (value2, i2) => isFailOn(value2) ? [] : [
+      {
+        ...source,
+        pointer: at(i2),
+        expected: `must be one of ${FAIL_ON_VALUES.join(", ")}, or FIELD-ratio>X (FIELD one of ${[...COST_OUTCOME_FIELDS.keys()].join(", ")})`,
+        got: quote(value2),
+        hint: "Separate outcomes with commas or new lines."
+      }
+    ]
+  );
+  if (issues.length === 0 && values.length > 1 && values.includes("none")) {
+    issues.push({
+      ...source,
+      pointer: at(values.indexOf("none")),
+      expected: "must not combine 'none' with other outcomes",
+      got: quote(values.join(","))
+    });
+  }
+  return issues;
+}
+function parseFailOn(text2, source) {
+  const values = text2.split(FAIL_ON_SEPARATORS).map((s) => s.trim()).filter((s) => s !== "");
+  const issues = failOnIssues(values, source);
+  return issues.length > 0 ? { issues } : { value: values };
+}
 
 // src/stats/distributions.ts
 var import_jstat = __toESM(require_jstat(), 1);
@@ -49632,12 +50237,12 @@ function specFromConfig(entry) {
   };
 }
 function configRoleConflicts(config) {
-  const groups2 = /* @__PURE__ */ new Map();
+  const groups3 = /* @__PURE__ */ new Map();
   for (const key of Object.keys(config)) {
     const n = normaliseName(key);
-    groups2.set(n, [...groups2.get(n) ?? [], key]);
+    groups3.set(n, [...groups3.get(n) ?? [], key]);
   }
-  return [...groups2.values()].filter((g) => g.length > 1);
+  return [...groups3.values()].filter((g) => g.length > 1);
 }
 function mergeRoles(base, config) {
   if (config === void 0) return base;
@@ -49796,10 +50401,10 @@ function isSuspect(pull, ctx) {
   if (pull === "toward-underfitting") return towardBias;
   return towardVariance && pull !== "less-variance";
 }
-var DECIMAL2 = /^[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?$/;
+var DECIMAL3 = /^[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?$/;
 function num(v) {
   if (typeof v === "number") return Number.isFinite(v) ? v : null;
-  if (typeof v === "string" && DECIMAL2.test(v.trim())) return Number(v.trim());
+  if (typeof v === "string" && DECIMAL3.test(v.trim())) return Number(v.trim());
   return null;
 }
 function comparedValues(c) {
@@ -50242,10 +50847,10 @@ function flatten(params) {
   }
   return new Map([...nested, ...literal]);
 }
-var DECIMAL3 = /^[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?$/;
+var DECIMAL4 = /^[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?$/;
 function asNumber(v) {
   if (typeof v === "number") return Number.isFinite(v) ? v : null;
-  if (typeof v === "string" && DECIMAL3.test(v.trim())) {
+  if (typeof v === "string" && DECIMAL4.test(v.trim())) {
     const n = Number(v.trim());
     return Number.isFinite(n) ? n : null;
   }
@@ -50326,14 +50931,14 @@ function prChanges(baseline, candidate, vocabulary = BUILT_IN_VOCABULARY) {
 }
 
 // src/analysis/movement.ts
-var TABLE = {
+var TABLE2 = {
   down: { down: "better-on-both", flat: "away-from-underfitting", up: "toward-overfitting" },
   flat: { down: "away-from-overfitting", flat: "no-significant-change", up: "toward-overfitting" },
   up: { down: "toward-underfitting", flat: "toward-underfitting", up: "worse-on-both" }
 };
 function movementOf(biasCall, varianceCall) {
   if (biasCall === "undetermined" || varianceCall === "undetermined") return "undetermined";
-  return TABLE[biasCall][varianceCall];
+  return TABLE2[biasCall][varianceCall];
 }
 function validationChangeOf(shortfallCall) {
   if (shortfallCall === "undetermined") return "undetermined";
@@ -51538,7 +52143,7 @@ var HashLog = class {
 function parseValue(raw, kind, file, line) {
   const column = kind === "proportion" ? "correct" : "loss";
   const text2 = raw.trim();
-  const value2 = kind === "proportion" ? text2 === "0" || text2 === "1" ? Number(text2) : Number.NaN : parseDecimal(text2) ?? Number.NaN;
+  const value2 = kind === "proportion" ? text2 === "0" || text2 === "1" ? Number(text2) : Number.NaN : parseDecimal2(text2) ?? Number.NaN;
   if (!Number.isFinite(value2) || Math.abs(value2) > MAX_MAGNITUDE) {
     throw new InputError([
       {
@@ -51674,17 +52279,17 @@ async function pairPredictions(baseline, candidate, kind) {
       pair(a.value.value, b.value.value);
     } else {
       if (!a.done) {
-        const partner = waitingCand.get(a.value.id);
-        if (partner !== void 0) {
+        const partner2 = waitingCand.get(a.value.id);
+        if (partner2 !== void 0) {
           waitingCand.delete(a.value.id);
-          pair(a.value.value, partner);
+          pair(a.value.value, partner2);
         } else waitingBase.set(a.value.id, a.value.value);
       }
       if (!b.done) {
-        const partner = waitingBase.get(b.value.id);
-        if (partner !== void 0) {
+        const partner2 = waitingBase.get(b.value.id);
+        if (partner2 !== void 0) {
           waitingBase.delete(b.value.id);
-          pair(partner, b.value.value);
+          pair(partner2, b.value.value);
         } else waitingCand.set(b.value.id, b.value.value);
       }
     }
@@ -53357,7 +53962,7 @@ function buildHeadline(review2, esc) {
 }
 
 // src/report/mermaid.ts
-var MAX_POINTS = 100;
+var MAX_POINTS2 = 100;
 var PALETTE = {
   baselineValidation: ["#1f5fa8", "dark blue"],
   baselineTrain: ["#8fbce6", "light blue"],
@@ -53481,7 +54086,7 @@ function lineChart(review2, curve, series, [lo, hi], yRange, only) {
     ...new Set(ordered.flatMap((s) => s.points.map((p) => p[0])).filter((x2) => x2 >= lo && x2 <= hi))
   ].sort((a, b) => a - b);
   const geometric = curve !== "epochs" && lo > 0 && hi / lo >= 10;
-  const grid = geometric ? thin(xs, MAX_POINTS) : evenGrid(lo, hi, Math.min(MAX_POINTS, xs.length));
+  const grid = geometric ? thin(xs, MAX_POINTS2) : evenGrid(lo, hi, Math.min(MAX_POINTS2, xs.length));
   const percent = review2.metric.kind === "proportion";
   const yScale = percent ? 100 : 1;
   const [yMin, yMax] = [yRange[0] * yScale, yRange[1] * yScale];
@@ -55175,31 +55780,31 @@ function routeMatcher(paths) {
 }
 var regex = routeMatcher(triggers_notification_paths_default);
 var triggersNotification = regex.test.bind(regex);
-var groups = {};
+var groups2 = {};
 var createGroups = function(Bottleneck2, common) {
-  groups.global = new Bottleneck2.Group({
+  groups2.global = new Bottleneck2.Group({
     id: "octokit-global",
     maxConcurrent: 10,
     ...common
   });
-  groups.auth = new Bottleneck2.Group({
+  groups2.auth = new Bottleneck2.Group({
     id: "octokit-auth",
     maxConcurrent: 1,
     ...common
   });
-  groups.search = new Bottleneck2.Group({
+  groups2.search = new Bottleneck2.Group({
     id: "octokit-search",
     maxConcurrent: 1,
     minTime: 2e3,
     ...common
   });
-  groups.write = new Bottleneck2.Group({
+  groups2.write = new Bottleneck2.Group({
     id: "octokit-write",
     maxConcurrent: 1,
     minTime: 1e3,
     ...common
   });
-  groups.notifications = new Bottleneck2.Group({
+  groups2.notifications = new Bottleneck2.Group({
     id: "octokit-notifications",
     maxConcurrent: 1,
     minTime: 3e3,
@@ -55251,14 +55856,14 @@ function throttling(octokit, octokitOptions) {
       return;
     }
     initialized = true;
-    if (groups.global == null) {
+    if (groups2.global == null) {
       createGroups(Bottleneck2, common);
     }
-    state.global = state.global ?? groups.global;
-    state.auth = state.auth ?? groups.auth;
-    state.search = state.search ?? groups.search;
-    state.write = state.write ?? groups.write;
-    state.notifications = state.notifications ?? groups.notifications;
+    state.global = state.global ?? groups2.global;
+    state.auth = state.auth ?? groups2.auth;
+    state.search = state.search ?? groups2.search;
+    state.write = state.write ?? groups2.write;
+    state.notifications = state.notifications ?? groups2.notifications;
     state.retryLimiter = state.retryLimiter ?? new Bottleneck2();
     const events = {};
     const emitter = new Bottleneck2.Events(events);
