@@ -15,6 +15,19 @@ export interface CsvLogOptions {
   x?: string;
   /** Shared across the files of one import; a fresh one per call by default. */
   budget?: PointBudget;
+  /**
+   * Columns the caller named (a config mapping): each must be in the header and differ from x,
+   * and only these are read. Default: every named column.
+   */
+  columns?: readonly { role: string; name: string }[];
+  /** Who named x and the columns, for messages: `(role) => \`epoch-log ${role} in the config\``. */
+  namedBy?: (role: string) => string;
+  /** An empty cell: `skip` (nothing logged on that row, the default) or `refuse` (a problem of its column). */
+  blank?: 'skip' | 'refuse';
+  /** Numbers beyond ± this are problems, as non-numbers are. Default: any finite number. */
+  maxMagnitude?: number;
+  /** Data rows allowed; the first row over is refused with its line. Default: no limit. */
+  maxRows?: number;
 }
 
 /** Cells of one CSV line (RFC 4180 quoting, without line breaks inside quotes); null when a quote is left open. */
@@ -59,6 +72,7 @@ export function readCsvLog(
 ): ReadResult {
   const text = decodeText(input, file, 'a CSV log');
   const budget = options.budget ?? new PointBudget();
+  const bound = options.maxMagnitude;
   const lines = text.split(/\r?\n/);
   const header = splitCsvLine(lines[0] ?? '');
   if (header === null || header.every((h) => h === '')) {
@@ -71,48 +85,83 @@ export function readCsvLog(
   }
   if (header.length > MAX_SERIES + 1)
     throw structural(file, 1, `must have at most ${MAX_SERIES} columns`, `${header.length}`);
-  const seen = new Set<string>();
-  for (const name of header) {
-    if (name === '' || seen.has(name))
+  // An unnamed column (pandas writes its index so) can be named by nobody and is never read.
+  const seen = new Map<string, number>();
+  header.forEach((name, i) => {
+    if (name === '') return;
+    const first = seen.get(name);
+    if (first !== undefined)
       throw structural(
         file,
         1,
-        'must name every column once',
+        `must name each column once (column ${i + 1} repeats column ${first + 1})`,
         quote(name),
-        'Give each column a distinct, non-empty name.',
+        'Rename one of the columns; a repeated name makes the choice of series ambiguous.',
       );
-    seen.add(name);
-  }
+    seen.set(name, i);
+  });
+  const shownHeader = quote(header.join(','));
+  const missing = (name: string, role: string) => {
+    const by = options.namedBy?.(role);
+    return structural(
+      file,
+      1,
+      `must have the column "${name}"${by === undefined ? '' : ` (${by})`}`,
+      shownHeader,
+      by === undefined
+        ? 'Name one of the header columns.'
+        : `Change ${by} to name one of the header columns.`,
+    );
+  };
   const xName = options.x ?? (seen.has('epoch') ? 'epoch' : seen.has('step') ? 'step' : undefined);
-  const xi = xName === undefined ? -1 : header.indexOf(xName);
-  if (xName === undefined || xi < 0) {
+  if (xName === undefined) {
     throw structural(
       file,
       1,
-      xName === undefined
-        ? 'must have an "epoch" or "step" column for x'
-        : `must have the column "${xName}"`,
-      quote(header.join(',')),
-      xName === undefined
-        ? 'Name the x column (--x, or x in the config).'
-        : 'Name one of the header columns.',
+      'must have an "epoch" or "step" column for x',
+      shownHeader,
+      'Name the x column (--x, or x in the config).',
     );
   }
+  const xi = seen.get(xName);
+  if (xi === undefined) throw missing(xName, 'x');
+  for (const { name, role } of options.columns ?? []) {
+    if (!seen.has(name)) throw missing(name, role);
+    if (name === xName)
+      throw structural(
+        file,
+        1,
+        `must not use the x column "${xName}" for ${options.namedBy?.(role) ?? role} as well`,
+        shownHeader,
+        'Name a column of values, not the one that counts epochs or steps.',
+      );
+  }
+  const wanted =
+    options.columns === undefined ? undefined : new Set(options.columns.map((c) => c.name));
 
   const where = { kind: 'line' } as const;
-  const series: Series[] = header.map((name) => ({
-    name,
-    file,
-    x: xName,
-    where,
-    points: [],
-    problems: [],
-  }));
+  const series: (Series | undefined)[] = header.map((name, c) =>
+    c === xi || name === '' || wanted?.has(name) === false
+      ? undefined
+      : { name, file, x: xName, where, points: [], problems: [] },
+  );
+  const usable = (v: number | undefined): v is number =>
+    v !== undefined && Number.isFinite(v) && (bound === undefined || Math.abs(v) <= bound);
   const xIssues: Issue[] = [];
+  let rows = 0;
   for (let i = 1; i < lines.length && xIssues.length < 10; i++) {
     const raw = lines[i] ?? '';
     if (raw.trim() === '') continue;
     const line = i + 1;
+    rows++;
+    if (options.maxRows !== undefined && rows > options.maxRows)
+      throw structural(
+        file,
+        line,
+        `must have at most ${options.maxRows} data rows`,
+        undefined,
+        'Log less often, or keep every n-th row.',
+      );
     const cells = splitCsvLine(raw);
     if (cells === null) throw structural(file, line, 'must close every quoted cell', quote(raw));
     if (cells.length > header.length)
@@ -125,18 +174,19 @@ export function readCsvLog(
       );
     const xCell = cells[xi] ?? '';
     const x = xCell === '' ? Number.NaN : parseDecimal(xCell);
-    if (x === undefined || !Number.isFinite(x)) {
-      xIssues.push(notFinite(file, `line ${line}`, `column "${xName}"`, xCell));
+    if (!usable(x)) {
+      xIssues.push(notFinite(file, `line ${line}`, `column "${xName}"`, xCell, bound));
       continue;
     }
     for (let c = 0; c < header.length; c++) {
-      const cell = cells[c] ?? '';
       const s = series[c];
-      if (c === xi || cell === '' || s === undefined) continue;
+      if (s === undefined) continue;
+      const cell = cells[c] ?? '';
+      if (cell === '' && options.blank !== 'refuse') continue;
       const value = parseDecimal(cell);
-      if (value === undefined || !Number.isFinite(value)) {
+      if (!usable(value)) {
         if (s.problems.length < 10)
-          s.problems.push(notFinite(file, `line ${line}`, `column "${s.name}"`, cell));
+          s.problems.push(notFinite(file, `line ${line}`, `column "${s.name}"`, cell, bound));
         continue;
       }
       budget.take(file, `line ${line}`);
@@ -144,5 +194,5 @@ export function readCsvLog(
     }
   }
   if (xIssues.length > 0) throw new InputError(xIssues);
-  return { series: series.filter((_, c) => c !== xi), warnings: [] };
+  return { series: series.filter((s): s is Series => s !== undefined), warnings: [] };
 }

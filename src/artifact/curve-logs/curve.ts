@@ -7,12 +7,20 @@
  * mean, points are sorted by x, and a warning says how many x were merged; with `'reject'`, x must
  * strictly increase in the order of the file, as a hand-written curve must. A curve point needs a
  * validation value, so training values at an x without one are left out (counted in a warning).
+ * With `exact` (a config mapping), only the named series are taken and their values are kept in
+ * the units they were logged in: nothing is looked up, converted or warned about units.
  * The result meets the artifact's rules: finite numbers, x strictly increasing, at least one point.
  */
 import { InputError } from '../../model/errors.js';
 import type { CurvePoint } from '../../model/run.js';
 import { pickSeries, type Catalogue, type PickOptions } from './picker.js';
-import { pointerOf, type CurveLogWarning, type ReadResult, type Series } from './types.js';
+import {
+  pointerOf,
+  type CurveLogWarning,
+  type ReadResult,
+  type Series,
+  type SeriesPoint,
+} from './types.js';
 import { convert, unitsFor } from './units.js';
 
 export interface CurveOptions extends PickOptions {
@@ -39,22 +47,26 @@ function collapse(
   mode: 'average' | 'reject',
   warnings: CurveLogWarning[],
 ): Map<number, number> {
-  if (series.problems.length > 0) throw new InputError(series.problems);
   // Running means: no overflow for values near the largest double.
   const means = new Map<number, { mean: number; n: number }>();
-  let previous: number | undefined;
+  let previous: SeriesPoint | undefined;
   for (const p of series.points) {
-    if (mode === 'reject' && previous !== undefined && !(p.x > previous)) {
+    if (mode === 'reject' && previous !== undefined && !(p.x > previous.x)) {
+      const x = series.where.kind === 'line' ? `column "${series.x}"` : `"${series.x}"`;
       throw new InputError([
         {
           file: series.file,
           pointer: pointerOf(series.where, p.at),
-          expected: `"${series.x}" must strictly increase (previous ${previous})`,
+          expected: `${x} must strictly increase (previous ${previous.x} at ${pointerOf(series.where, previous.at)})`,
           got: String(p.x),
+          hint:
+            p.x === previous.x
+              ? 'Keep one value per x: drop the repeated ones (a resumed run logs some twice).'
+              : 'Sort the rows by x, or cut the log where x starts again.',
         },
       ]);
     }
-    previous = p.x;
+    previous = p;
     const entry = means.get(p.x);
     if (entry === undefined) means.set(p.x, { mean: p.value, n: 1 });
     else {
@@ -81,7 +93,8 @@ export function buildCurve(
   const warnings: CurveLogWarning[] = [...read.warnings, ...picked.warnings];
   const mode = options.duplicates ?? 'average';
   const { validation, train } = picked;
-  const units = unitsFor(picked.base, validation.name, options.metric);
+  const units: ReturnType<typeof unitsFor> =
+    options.exact === true ? {} : unitsFor(picked.base, validation.name, options.metric);
   if (units.warning !== undefined) warnings.push(units.warning);
   const conversion = units.conversion;
   const toMetric = (v: number): number => {
@@ -99,6 +112,12 @@ export function buildCurve(
     return converted;
   };
 
+  // Bad cells of either series, reported together (at most 10 each were kept).
+  const problems = [
+    ...validation.problems,
+    ...(train === undefined || train === validation ? [] : train.problems),
+  ];
+  if (problems.length > 0) throw new InputError(problems);
   const validationByX = collapse(validation, mode, warnings);
   const trainByX = train === undefined ? undefined : collapse(train, mode, warnings);
   if (validationByX.size === 0) {

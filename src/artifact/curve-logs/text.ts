@@ -1,5 +1,6 @@
 /** Shared helpers of the text readers: bytes to text, decimal numbers, and the bounds. */
 import { InputError, quote, type Issue } from '../../model/errors.js';
+import { formatLimit } from '../../model/limits.js';
 import { MAX_POINTS, MAX_TEXT_BYTES } from './limits.js';
 
 const decoder = new TextDecoder('utf-8', { fatal: true });
@@ -43,19 +44,36 @@ export function parseDecimal(text: string): number | undefined {
   return undefined;
 }
 
-/** The issue for a value that is not a finite number. */
-export function notFinite(file: string, pointer: string, what: string, got: string): Issue {
-  const nonFinite = parseDecimal(got) !== undefined;
+/**
+ * The issue for a value that is not a finite number, or (with `bound`) a decimal number beyond
+ * ±bound.
+ */
+export function notFinite(
+  file: string,
+  pointer: string,
+  what: string,
+  got: string,
+  bound?: number,
+): Issue {
+  const value = parseDecimal(got);
+  const nonFinite = value !== undefined && !Number.isFinite(value);
   return {
     file,
     pointer,
-    expected: `${what} must be a finite number`,
+    expected:
+      bound === undefined
+        ? `${what} must be a finite number`
+        : `${what} must be a decimal number within ±${formatLimit(bound)}`,
     got: quote(got),
     ...(nonFinite
       ? {
           hint: 'The run logged NaN or infinity here (it may have diverged); cut the log before this point or pick another series.',
         }
-      : {}),
+      : value !== undefined
+        ? {
+            hint: 'Rescale the values (thousands instead of units); larger ones overflow in the statistics.',
+          }
+        : {}),
   };
 }
 

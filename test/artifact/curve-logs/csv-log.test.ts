@@ -107,6 +107,16 @@ describe('readCsvLog', () => {
     ]);
   });
 
+  it('ignores an unnamed column, as pandas writes its index', () => {
+    // DataFrame.to_csv() without index=False: the first header cell is empty (common practice).
+    const read = readCsvLog(',epoch,loss,val_loss\n0,1,0.5,0.6\n1,2,0.4,0.5\n', 'pd.csv');
+    expect(read.series.map((s) => s.name)).toEqual(['loss', 'val_loss']);
+    expect(buildCurve(read, catalogue).points).toEqual([
+      { x: 1, train: 0.5, validation: 0.6 },
+      { x: 2, train: 0.4, validation: 0.5 },
+    ]);
+  });
+
   it('keeps a bad cell as a problem of its column: fatal only when that column is used', () => {
     const text = 'epoch,loss,val_loss,note\n1,0.5,0.6,ok\n2,0.4,0.5,fine\n3,nan,0.55,x\n';
     const read = readCsvLog(text, 'k.csv');
@@ -121,8 +131,7 @@ describe('readCsvLog', () => {
     expect(validationOnly.points).toHaveLength(3);
   });
 
-  it('gives the messages the config epoch-log mapping gives today', () => {
-    // Same wording as src/artifact/epoch-log.ts, so the mapping can switch to this reader.
+  it('names the line and the column in its messages', () => {
     const text = 'epoch,train_loss,val_loss\n1,0.5,0.6\n2,0.4,oops\n';
     expect(() => readCsvLog(text, 'epochs.csv', { x: 'iteration' })).toThrow(
       'epochs.csv: line 1 must have the column "iteration"',
@@ -148,7 +157,7 @@ describe('readCsvLog', () => {
         validation: 'val_loss',
         duplicates: 'reject',
       }),
-    ).toThrow('e.csv: line 4 "epoch" must strictly increase (previous 3) (got 2)');
+    ).toThrow('e.csv: line 4 column "epoch" must strictly increase (previous 3 at line 3) (got 2)');
     expect(
       buildCurve(readCsvLog(decreasing, 'e.csv'), catalogue, { validation: 'val_loss' }).points.map(
         (p) => p.x,
@@ -159,7 +168,7 @@ describe('readCsvLog', () => {
   it('rejects broken structure with the line', () => {
     expect(() => readCsvLog('', 'e.csv')).toThrow('e.csv: line 1 must be a header row');
     expect(() => readCsvLog('epoch,a,a\n', 'e.csv')).toThrow(
-      'e.csv: line 1 must name every column once',
+      'e.csv: line 1 must name each column once (column 3 repeats column 2) (got "a")',
     );
     expect(() => readCsvLog('loss,val_loss\n1,2\n', 'e.csv')).toThrow(
       'e.csv: line 1 must have an "epoch" or "step" column for x',
