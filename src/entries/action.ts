@@ -3,12 +3,9 @@
  * the chosen mode. Environment reads happen here and in `action/settings.ts` only.
  */
 import * as core from '@actions/core';
-import { runAudit } from './action/audit-mode.js';
 import { readAuditSettings } from './action/audit-settings.js';
 import { handleFailure } from './action/failure.js';
 import { coreIO } from './action/io.js';
-import { runPublish } from './action/publish-mode.js';
-import { runReview } from './action/review-mode.js';
 import { readSettings } from './action/settings.js';
 import { createClient } from '../io/github/client.js';
 import { buildRunContext } from '../io/github/context.js';
@@ -26,9 +23,13 @@ async function main(): Promise<void> {
     log: (message) => core.info(message),
   });
   const deps = { settings, context: buildRunContext(context), octokit, io: coreIO() };
-  if (settings.mode === 'audit')
+  // Each mode is loaded when it runs (the bundle is split per mode).
+  if (settings.mode === 'audit') {
+    const { runAudit } = await import('./action/audit-mode.js');
     await runAudit({ ...deps, audit: readAuditSettings(settings), now: () => new Date() });
-  else await (settings.mode === 'publish' ? runPublish(deps) : runReview(deps));
+  } else if (settings.mode === 'publish') {
+    await (await import('./action/publish-mode.js')).runPublish(deps);
+  } else await (await import('./action/review-mode.js')).runReview(deps);
 }
 
 main().catch(handleFailure);

@@ -96,7 +96,7 @@ function escapePointer(key: string): string {
 /** Parses and validates config text. */
 export async function parseConfig(text: string, file: string): Promise<ConfigFile> {
   // Imported here: a review without a config file does not load the YAML parser at all.
-  const { parseDocument } = await import('yaml');
+  const { parseDocument } = await import('./yaml-parser.js');
   const config = checkSettings(parseRaw(parseDocument, text, file), file);
   const conflicts = roleConflictIssues(config.hyperparameters, file);
   if (conflicts.length > 0) throw new InputError(conflicts);

@@ -1,8 +1,5 @@
 /** Dispatches a CLI invocation to its command and maps errors to exit codes. */
 import { EXIT, InputError, UsageError } from '../../model/errors.js';
-import { auditCommand } from './audit.js';
-import { demoCommand, reviewCommand, validateCommand } from './commands.js';
-import { curvesCommand } from './curves-import.js';
 import { MAIN_HELP } from './help.js';
 import type { CliIo } from './io.js';
 
@@ -10,16 +7,18 @@ export async function runCli(argv: string[], io: CliIo): Promise<number> {
   const [command, ...rest] = argv;
   try {
     switch (command) {
+      // Each command is loaded when it runs, so start-up parses only what the command needs
+      // (the bundle is split per command).
       case 'review':
-        return await reviewCommand(rest, io);
+        return await (await import('./commands.js')).reviewCommand(rest, io);
       case 'validate':
-        return await validateCommand(rest, io);
+        return await (await import('./commands.js')).validateCommand(rest, io);
       case 'demo':
-        return await demoCommand(rest, io);
+        return await (await import('./commands.js')).demoCommand(rest, io);
       case 'curves':
-        return await curvesCommand(rest, io);
+        return await (await import('./curves-import.js')).curvesCommand(rest, io);
       case 'audit':
-        return await auditCommand(rest, io);
+        return await (await import('./audit.js')).auditCommand(rest, io);
       case '--version':
       case '-v':
         io.stdout(`${io.version}\n`);
