@@ -102,7 +102,9 @@ export function guardrailsTable(
   for (const [field, words] of COST_WORDS) {
     const c: CostChange | undefined = review.cost?.[field];
     if (c === undefined) continue;
-    const interval = c.ci === null ? '' : ` [${fixed(c.ci[0], 2)}, ${fixed(c.ci[1], 2)}]`;
+    // The compact (80-column) table leaves the interval out; its verdict says whether it moved.
+    const interval =
+      c.ci === null || compact ? '' : ` [${fixed(c.ci[0], 2)}, ${fixed(c.ci[1], 2)}]`;
     rows.push([
       words.noun,
       costCell(c.baseline, field),

@@ -6,7 +6,7 @@
  */
 import mermaid from 'mermaid';
 import { describe, expect, it } from 'vitest';
-import { renderMarkdown } from '../../src/report/index.js';
+import { renderMarkdown, renderText } from '../../src/report/index.js';
 import { reviewFiles } from '../../src/io/review-from-files.js';
 import { mermaidBlocks, rawHtml, tableShapes, toDocument } from './gfm.js';
 
@@ -64,5 +64,19 @@ describe('demo comments are short', () => {
     const headline = md.split('\n### ')[0] ?? '';
     expect(headline.split('\n').length).toBeLessThanOrEqual(12);
     expect(headline.length).toBeLessThan(1600);
+  });
+});
+
+describe('demo guardrails in the terminal', () => {
+  it('3-more-data: the guardrail verdict and its margin fit 80 columns uncut', async () => {
+    const { review } = await reviewFiles({
+      baseline: 'demo/baseline.json',
+      candidate: 'demo/3-more-data.json',
+      config: 'demo/fitgap.yml',
+    });
+    const text = renderText(review, { color: false });
+    const row = text.split('\n').find((l) => l.trimStart().startsWith('calibration_error'));
+    expect(row).toMatch(/\+0\.01280 +beyond margin 0\.00500$/);
+    for (const line of text.split('\n')) expect(line.length).toBeLessThanOrEqual(80);
   });
 });
