@@ -72,6 +72,11 @@ Options:
   --max-csv-mb N        largest predictions CSV read (default 512)
   -h, --help            show this help
 
+Outcomes for --fail-on: worse-validation, toward-overfitting, toward-underfitting,
+worse-on-both, any-movement, slice-regression, high-bias, high-variance, data-mismatch,
+validation-overfit, guardrail-regression, guardrail-undetermined, none, and FIELD-ratio>X
+for a cost (train-seconds, inference-ms, parameters, memory-mb), e.g. train-seconds-ratio>2.
+
 Flags override the config file. Exit codes: 0 gate passed; 1 gate failed; 2 bad input.
 `;
 
