@@ -3,7 +3,7 @@
  * review model touches this file only. Pure.
  *
  * Read: metric.{name,goal,kind}, settings.alpha, movement, validation.{change,delta}, bias.delta.call,
- * variance.delta.call, gate.{pass,reasons}, and of baseline/candidate: splits[validation].{mean,ci},
+ * variance.delta.call, gate.pass, and of baseline/candidate: splits[validation].{mean,ci},
  * errorLevel, components.{bias,variance}.value, diagnosis.
  */
 import type { Call, Delta, Diagnosis, Movement, Review, RunSummary } from '../model/review.js';
@@ -30,7 +30,6 @@ export interface ChangeFields {
   biasCall: Call | null;
   varianceCall: Call;
   gatePass: boolean;
-  gateReasons: string[];
 }
 
 export interface ReviewFields {
@@ -70,7 +69,6 @@ export function reviewFields(review: Review): ReviewFields {
       biasCall: review.bias.delta?.call ?? null,
       varianceCall: review.variance.delta.call,
       gatePass: review.gate.pass,
-      gateReasons: review.gate.reasons.map((r) => r.outcome),
     },
   };
 }
