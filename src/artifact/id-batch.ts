@@ -8,6 +8,8 @@
  * every operation carries the step its row was read at.
  */
 
+import { FNV_BASIS, FNV_PRIME, slotHash } from './id-tables.js';
+
 /** Operation kinds. */
 export const MEET_BASE = 1;
 export const MEET_CAND = 2;
@@ -43,16 +45,22 @@ export class IdBatch {
     return this.size === this.capacity;
   }
 
-  add(kind: number, key: Uint8Array, start: number, len: number, hash: number, step: number): void {
+  /** Adds a record; its hash is the id table's (`slotHash`), computed while the bytes are copied. */
+  add(kind: number, key: Uint8Array, start: number, len: number, step: number): void {
     if (len > this.width) this.widen(len);
     const r = this.size++;
     const at = r * this.stride;
     const words = this.words;
-    words[at] = hash;
+    const bytes = this.bytes;
+    let fnv = FNV_BASIS;
+    for (let k = 0, b = (at + HEAD) * 4; k < len; k++) {
+      const c = key[start + k] as number;
+      bytes[b + k] = c;
+      fnv = Math.imul(fnv ^ c, FNV_PRIME);
+    }
+    words[at] = slotHash(fnv);
     words[at + 1] = step;
     words[at + 2] = (len << 3) | kind;
-    const bytes = this.bytes;
-    for (let k = 0, b = (at + HEAD) * 4; k < len; k++) bytes[b + k] = key[start + k] as number;
     if (len > this.longest) this.longest = len;
   }
 

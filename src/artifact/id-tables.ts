@@ -19,26 +19,27 @@ function mix(h: number): number {
 
 /** Two FNV-1a-style hashes of `key[start, start + len)` (different primes), mixed, 31 bits each. */
 export function hashId(key: Uint8Array, start: number, len: number): void {
-  let a = 0x811c9dc5;
+  let a = FNV_BASIS;
   let b = 0x9747b28c ^ len;
   for (let i = start, stop = start + len; i < stop; i++) {
     const c = key[i] as number;
-    a = Math.imul(a ^ c, 0x01000193);
+    a = Math.imul(a ^ c, FNV_PRIME);
     b = Math.imul(b ^ c, 0x5bd1e995);
   }
   hashed.a = mix(a) & 0x7fffffff;
   hashed.b = mix(b ^ (b >>> 15)) & 0x7fffffff;
 }
 
+/** FNV-1a's offset basis and prime (32-bit; Fowler, Noll, Vo; common practice). */
+export const FNV_BASIS = 0x811c9dc5;
+export const FNV_PRIME = 0x01000193;
+
 /**
- * `hashId`'s first word alone (the id table's hash), in `hashed.a`: half the work, for the rows that
- * only meet in the table.
+ * `hashId`'s first word (the id table's hash) from the FNV-1a state after the id's bytes: callers
+ * that copy the bytes anyway hash them in the same pass.
  */
-export function slotHash(key: Uint8Array, start: number, len: number): void {
-  let a = 0x811c9dc5;
-  for (let i = start, stop = start + len; i < stop; i++)
-    a = Math.imul(a ^ (key[i] as number), 0x01000193);
-  hashed.a = mix(a) & 0x7fffffff;
+export function slotHash(fnv: number): number {
+  return mix(fnv) & 0x7fffffff;
 }
 
 export function sameBytes(

@@ -6,7 +6,7 @@ import type { MetricKind } from '../model/run.js';
 import { RunningStats } from '../stats/index.js';
 import { IdBatch, MEET_BASE, MEET_CAND } from './id-batch.js';
 import type { IdTable } from './id-tables.js';
-import { BASE, CAND, INLINE_ID_BYTES, IdOrder, hashed, sameBytes, slotHash } from './id-tables.js';
+import { BASE, CAND, INLINE_ID_BYTES, IdOrder, sameBytes } from './id-tables.js';
 import { NEED, ROW, type PredictionLines } from './prediction-lines.js';
 
 /** `run()` results. */
@@ -158,23 +158,21 @@ export class Pairing {
       } else {
         this.ringUsed = !this.proportion;
         if (hasA) {
-          slotHash(a.key, a.keyStart, a.keyLen);
           if (a.keyLen <= INLINE_ID_BYTES) {
             if (this.proportion)
-              batch.add(MEET_BASE | (a.value << 2), a.key, a.keyStart, a.keyLen, hashed.a, step);
+              batch.add(MEET_BASE | (a.value << 2), a.key, a.keyStart, a.keyLen, step);
             else {
-              batch.add(MEET_BASE, a.key, a.keyStart, a.keyLen, hashed.a, step);
+              batch.add(MEET_BASE, a.key, a.keyStart, a.keyLen, step);
               batch.values[batch.size - 1] = a.value;
             }
           } else this.now(MEET_BASE, a, step);
         }
         if (hasB) {
-          slotHash(b.key, b.keyStart, b.keyLen);
           if (b.keyLen <= INLINE_ID_BYTES) {
             if (this.proportion)
-              batch.add(MEET_CAND | (b.value << 2), b.key, b.keyStart, b.keyLen, hashed.a, step);
+              batch.add(MEET_CAND | (b.value << 2), b.key, b.keyStart, b.keyLen, step);
             else {
-              batch.add(MEET_CAND, b.key, b.keyStart, b.keyLen, hashed.a, step);
+              batch.add(MEET_CAND, b.key, b.keyStart, b.keyLen, step);
               batch.values[batch.size - 1] = b.value;
             }
           } else this.now(MEET_CAND, b, step);
@@ -187,11 +185,14 @@ export class Pairing {
     }
   }
 
-  /** A long id's table operation, at once (the table keeps long ids apart, in a Map). */
+  /**
+   * A long id's table operation, at once (the table keeps long ids apart, in a Map, and needs no
+   * hash for them).
+   */
   private now(kind: number, lines: PredictionLines, step: number): void {
     this.table.incoming = lines.value;
     this.table.incomingStep = step;
-    this.apply(kind, lines.key, lines.keyStart, lines.keyLen, hashed.a, step);
+    this.apply(kind, lines.key, lines.keyStart, lines.keyLen, 0, step);
   }
 
   /** Applies the batch and hands on the pairs of the window's steps, in order. */

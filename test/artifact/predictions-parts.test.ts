@@ -16,6 +16,7 @@ import {
   hashed,
 } from '../../src/artifact/id-tables.js';
 import { Readable } from 'node:stream';
+import { IdBatch, MEET_BASE } from '../../src/artifact/id-batch.js';
 import { NEED, PredictionLines, ROW, streamReader } from '../../src/artifact/prediction-lines.js';
 import { InputError } from '../../src/model/errors.js';
 import { MAX_MAGNITUDE } from '../../src/model/limits.js';
@@ -25,6 +26,29 @@ const ids = fc.oneof(
   fc.integer({ min: 0, max: 5 }).map((i) => `${'long-'.repeat(15)}${i}`), // > INLINE_ID_BYTES
   fc.integer({ min: 0, max: 5 }).map((i) => `${'w'.repeat(20)}${i}`), // widens the table
 );
+
+describe('IdBatch', () => {
+  it('stores the id table hash of each id, the first word of hashId (property)', () => {
+    // The table meets rows by this hash (common practice: FNV-1a, murmur3's finaliser); the
+    // batch computes it while it copies the bytes, so it must be the same function.
+    fc.assert(
+      fc.property(
+        fc.array(fc.uint8Array({ minLength: 1, maxLength: INLINE_ID_BYTES }), {
+          minLength: 1,
+          maxLength: 20,
+        }),
+        (keys) => {
+          const batch = new IdBatch(keys.length);
+          keys.forEach((key, step) => batch.add(MEET_BASE, key, 0, key.length, step));
+          keys.forEach((key, r) => {
+            hashId(key, 0, key.length);
+            expect(batch.hash(r)).toBe(hashed.a);
+          });
+        },
+      ),
+    );
+  });
+});
 
 describe('IdTable', () => {
   it('pairs like the original two Maps, in a table that starts tiny (property)', () => {
