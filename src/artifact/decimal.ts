@@ -3,10 +3,10 @@
  * the value `(hi · 10^loDigits + lo) · 10^scale` from its digits, equal to what `Number()` gives
  * for the same text, or NaN when this cannot tell (then the caller asks `Number()`).
  *
- * - Up to 15 significant digits (`lo` empty) and |scale| ≤ 22: one division or multiplication of
- *   two exact doubles, correctly rounded by IEEE 754 (Clinger 1990, "How to read floating point
- *   numbers accurately", PLDI; the "fast path").
- * - 16 to 19 digits (what shortest round-trip printing of a double gives): the first rounded
+ * - A digit string whose integer is below 2^53 (up to 15 digits, most of 16) and |scale| ≤ 22: one
+ *   division or multiplication of two exact doubles, correctly rounded by IEEE 754 (Clinger 1990,
+ *   "How to read floating point numbers accurately", PLDI; the "fast path").
+ * - Larger ones, up to 20 digits (shortest round-trip printing gives up to 17): the first rounded
  *   quotient q0, then its residual, computed exactly with Dekker's (1971) product ("A
  *   floating-point technique for extending the available precision", Numer. Math. 18) and
  *   Veltkamp's split, decides between q0 and its neighbour. A residual within 2^-20 of a halfway
@@ -14,6 +14,7 @@
  */
 
 const POW10 = Array.from({ length: 23 }, (_, i) => Number(`1e${i}`));
+const TWO53 = 2 ** 53;
 const SPLIT = 134217729; // 2^27 + 1 (Veltkamp)
 /** Veltkamp halves of the powers of ten: 10^i = POW10_HI[i] + POW10_LO[i], 26 bits each. */
 const POW10_HI = POW10.map((x) => SPLIT * x - (SPLIT * x - x));
@@ -35,8 +36,8 @@ export const io = new Float64Array(3);
 export const decoded = io.subarray(2, 3);
 
 /**
- * Sets `decoded[0]` to `(hi · 10^loDigits + lo) · 10^scale`, for hi < 10^15, lo < 10^loDigits,
- * loDigits ≤ 4 and |scale| ≤ 22, and returns true; false when a `Number()` call must decide.
+ * Sets `decoded[0]` to `(hi · 10^loDigits + lo) · 10^scale`, for integers hi < 2^53 and
+ * lo < 10^loDigits, loDigits ≤ 4 and |scale| ≤ 22, and returns true; false when a `Number()` call must decide.
  */
 export function decimalToDouble(hi: number, lo: number, loDigits: number, scale: number): boolean {
   io[0] = hi;
@@ -56,8 +57,15 @@ export function decodeDecimal(loDigits: number, scale: number): boolean {
     return true;
   }
   if (hi === 0) return false;
-  // m = hi · 10^loDigits + lo = mh + ml exactly (mh = fl(m)); Dekker's product for hi · 10^loDigits.
+  // Clinger's fast path still holds when hi · 10^loDigits + lo is below 2^53: then it is exact (a
+  // rounded product or sum at or above 2^53 stays at or above it, so the test cannot pass wrongly).
   const t = POW10[loDigits] as number;
+  const whole = hi * t + (io[1] as number);
+  if (whole < TWO53) {
+    io[2] = scale < 0 ? whole / d : whole * d;
+    return true;
+  }
+  // m = hi · 10^loDigits + lo = mh + ml exactly (mh = fl(m)); Dekker's product for hi · 10^loDigits.
   const th = POW10_HI[loDigits] as number;
   const tl = POW10_LO[loDigits] as number;
   let x = SPLIT * hi;

@@ -1,11 +1,14 @@
 /**
  * A batch of id-table operations (rows out of step with the other file), stored flat and
- * applied grouped by the table region their id falls in. A million random probes into a table of
- * tens of megabytes miss the cache and the TLB on almost every probe; a few thousand probes into
- * one region of it mostly hit. Without a repeated id the result of the operations does not depend
+ * applied in order of the table region their id falls in, the records moved into that order. A
+ * million random probes into a table of tens of megabytes miss the cache and the TLB on almost
+ * every probe; probes that sweep the table from one end to the other, and records read one after
+ * another, mostly hit. Without a repeated id the result of the operations does not depend
  * on their order (each id pairs with its one partner); where the order of pairs matters (losses),
  * every operation carries the step its row was read at.
  */
+
+import { FNV_BASIS, FNV_PRIME, slotHash } from './id-tables.js';
 
 /** Operation kinds. */
 export const MEET_BASE = 1;
@@ -23,41 +26,63 @@ export class IdBatch {
   private words: Uint32Array;
   private bytes: Uint8Array;
   /** Values of the records (written by the caller after `add`: a double argument is boxed). */
-  readonly values: Float64Array;
-  private order: Int32Array;
+  values: Float64Array;
+  /** Where `sort` writes the records in their new order (then the two swap). */
+  private spare: Uint32Array = new Uint32Array(0);
+  private spareBytes: Uint8Array = new Uint8Array(0);
+  private spareValues: Float64Array;
   private group = new Int32Array(0);
+  private counts = new Int32Array(0);
 
   constructor(readonly capacity: number) {
     this.words = new Uint32Array(capacity * this.stride);
     this.bytes = new Uint8Array(this.words.buffer);
     this.values = new Float64Array(capacity);
-    this.order = new Int32Array(capacity);
+    this.spareValues = new Float64Array(0);
   }
 
   get full(): boolean {
     return this.size === this.capacity;
   }
 
-  add(kind: number, key: Uint8Array, start: number, len: number, hash: number, step: number): void {
+  /** Adds a record; its hash is the id table's (`slotHash`), computed while the bytes are copied. */
+  add(kind: number, key: Uint8Array, start: number, len: number, step: number): void {
     if (len > this.width) this.widen(len);
     const r = this.size++;
     const at = r * this.stride;
     const words = this.words;
-    words[at] = hash;
+    const bytes = this.bytes;
+    let fnv = FNV_BASIS;
+    for (let k = 0, b = (at + HEAD) * 4; k < len; k++) {
+      const c = key[start + k] as number;
+      bytes[b + k] = c;
+      fnv = Math.imul(fnv ^ c, FNV_PRIME);
+    }
+    words[at] = slotHash(fnv);
     words[at + 1] = step;
     words[at + 2] = (len << 3) | kind;
-    const bytes = this.bytes;
-    for (let k = 0, b = (at + HEAD) * 4; k < len; k++) bytes[b + k] = key[start + k] as number;
     if (len > this.longest) this.longest = len;
   }
 
-  /** Record indices in order of their home slot in `table` >>> shift (a counting sort). */
-  sorted(table: { slots: number; home(hash: number): number }, shift: number): Int32Array {
+  /**
+   * Puts the records in order of their home slot in `table` >>> shift (a stable counting sort that
+   * moves them, so that they are then read one after another, not at random).
+   */
+  sort(
+    table: { slots: number; home(hash: number): number },
+    shift: number,
+    withValues: boolean,
+  ): void {
     const groups = ((table.slots - 1) >>> shift) + 1;
-    const counts = new Int32Array(groups + 1);
-    const { words, stride, order, size } = this;
-    const group =
-      this.group.length < size ? (this.group = new Int32Array(this.capacity)) : this.group;
+    if (this.counts.length < groups + 1) this.counts = new Int32Array(groups + 1);
+    else this.counts.fill(0, 0, groups + 1);
+    const counts = this.counts;
+    const { words, stride, size, values } = this;
+    if (this.group.length < size) this.group = new Int32Array(this.capacity);
+    if (this.spare.length !== words.length) this.spare = new Uint32Array(words.length);
+    if (withValues && this.spareValues.length !== values.length)
+      this.spareValues = new Float64Array(values.length);
+    const { group, spare, spareValues } = this;
     for (let r = 0; r < size; r++) {
       const g = table.home(words[r * stride] as number) >>> shift;
       group[r] = g;
@@ -66,10 +91,22 @@ export class IdBatch {
     for (let g = 1; g <= groups; g++) counts[g] = (counts[g] as number) + (counts[g - 1] as number);
     for (let r = 0; r < size; r++) {
       const g = group[r] as number;
-      order[counts[g] as number] = r;
-      counts[g] = (counts[g] as number) + 1;
+      const to = counts[g] as number;
+      counts[g] = to + 1;
+      for (let k = 0, from = r * stride, at = to * stride; k < stride; k++)
+        spare[at + k] = words[from + k] as number;
+      if (withValues) spareValues[to] = values[r] as number;
     }
-    return order;
+    this.spare = words;
+    this.words = spare;
+    const bytes = this.bytes;
+    this.bytes =
+      this.spareBytes.buffer === spare.buffer ? this.spareBytes : new Uint8Array(spare.buffer);
+    this.spareBytes = bytes;
+    if (withValues) {
+      this.spareValues = values;
+      this.values = spareValues;
+    }
   }
 
   hash(r: number): number {

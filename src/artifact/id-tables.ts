@@ -19,15 +19,27 @@ function mix(h: number): number {
 
 /** Two FNV-1a-style hashes of `key[start, start + len)` (different primes), mixed, 31 bits each. */
 export function hashId(key: Uint8Array, start: number, len: number): void {
-  let a = 0x811c9dc5;
+  let a = FNV_BASIS;
   let b = 0x9747b28c ^ len;
   for (let i = start, stop = start + len; i < stop; i++) {
     const c = key[i] as number;
-    a = Math.imul(a ^ c, 0x01000193);
+    a = Math.imul(a ^ c, FNV_PRIME);
     b = Math.imul(b ^ c, 0x5bd1e995);
   }
   hashed.a = mix(a) & 0x7fffffff;
   hashed.b = mix(b ^ (b >>> 15)) & 0x7fffffff;
+}
+
+/** FNV-1a's offset basis and prime (32-bit; Fowler, Noll, Vo; common practice). */
+export const FNV_BASIS = 0x811c9dc5;
+export const FNV_PRIME = 0x01000193;
+
+/**
+ * `hashId`'s first word (the id table's hash) from the FNV-1a state after the id's bytes: callers
+ * that copy the bytes anyway hash them in the same pass.
+ */
+export function slotHash(fnv: number): number {
+  return mix(fnv) & 0x7fffffff;
 }
 
 export function sameBytes(
@@ -163,6 +175,8 @@ export class IdTable {
   /** How many rows will wait at most, when that is clear (else 0); read when the table grows. */
   expected = 0;
   private cap: number;
+  /** slots / 2^31 (exact: a power-of-two division). */
+  private scale: number;
   private width = 8;
   private stride = 2 + 8 / 4;
   private count = 0;
@@ -179,6 +193,7 @@ export class IdTable {
     slots = 4096,
   ) {
     this.cap = slots;
+    this.scale = slots / 2 ** 31;
     this.words = new Uint32Array(slots * this.stride);
     this.bytes = new Uint8Array(this.words.buffer);
     this.values = losses ? new Float64Array(slots) : null;
@@ -195,10 +210,12 @@ export class IdTable {
     return this.cap;
   }
 
-  /** The home slot of a 31-bit hash: ⌊hash · slots / 2^31⌋ (exact in doubles below 2^27 slots). */
+  /**
+   * The home slot of a 31-bit hash: hash · slots / 2^31 rounded down, in [0, slots) (the product
+   * is rounded to a double first, which may move a slot by one: the same for every call).
+   */
   home(hash: number): number {
-    const cap = this.cap;
-    return Math.floor(((hash >>> 16) * cap + Math.floor(((hash & 0xffff) * cap) / 65536)) / 32768);
+    return Math.floor(hash * this.scale);
   }
 
   /** Room for `n` rows without growing. */
@@ -354,6 +371,7 @@ export class IdTable {
     // Widths in steps of 4 bytes (ids of a file mostly have similar lengths).
     const w = Math.max(this.width, Math.ceil(width / 4) * 4);
     this.cap = cap;
+    this.scale = cap / 2 ** 31;
     this.width = w;
     this.stride = 2 + w / 4;
     this.words = new Uint32Array(cap * this.stride);

@@ -226,13 +226,14 @@ export class PredictionLines {
     let c = p < end ? (buf[p] as number) : -1;
     const negative = c === 45;
     if (negative) c = ++p < end ? (buf[p] as number) : -1;
-    // The first 15 significant digits in hi, the next ones (up to 4 are used) in lo.
+    // The leading significant digits in hi while it stays below 9·10^15 (an exact integer under
+    // 2^53: 16 digits unless they start with 9), the next ones (up to 4 are used) in lo.
     let hi = 0;
     let lo = 0;
     let loDigits = 0;
     const intStart = p;
     while (p < end && (c = buf[p] as number) >= 48 && c <= 57) {
-      if (hi < 1e14) hi = hi * 10 + (c - 48);
+      if (hi < 9e14) hi = hi * 10 + (c - 48);
       else {
         lo = lo * 10 + (c - 48);
         loDigits++;
@@ -243,9 +244,10 @@ export class PredictionLines {
     let scale = 0;
     if (p < end && c === 46) {
       const fracStart = ++p;
-      // Eight digits at a time while they fit in hi (a fraction is most of a loss's digits).
+      // Eight digits at a time while they fit in hi (a fraction is most of a loss's digits):
+      // hi < 9·10^7 before a block keeps it below 9·10^15, as the digit loop would.
       const view = this.view;
-      while (hi < 1e7 && p + 8 <= end) {
+      while (hi < 9e7 && p + 8 <= end) {
         const w0 = view.getUint32(p, true);
         const w1 = view.getUint32(p + 4, true);
         if (!allDigits(w0) || !allDigits(w1)) break;
@@ -253,7 +255,7 @@ export class PredictionLines {
         p += 8;
       }
       while (p < end && (c = buf[p] as number) >= 48 && c <= 57) {
-        if (hi < 1e14) hi = hi * 10 + (c - 48);
+        if (hi < 9e14) hi = hi * 10 + (c - 48);
         else {
           lo = lo * 10 + (c - 48);
           loDigits++;

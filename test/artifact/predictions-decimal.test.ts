@@ -20,6 +20,25 @@ function read(digits: string, scale: number): number {
   return decimalToDouble(hi, lo, loDigits, scale) ? (decoded[0] as number) : Number.NaN;
 }
 
+/**
+ * hi / lo / loDigits as the byte reader splits a digit string (prediction-lines.ts `number`): digits
+ * go to hi while hi < 9·10^14 (so hi stays an exact integer below 2^53, 16 digits unless the first
+ * is 9), the rest to lo.
+ */
+function readerSplit(digits: string): [number, number, number] {
+  let hi = 0;
+  let lo = 0;
+  let loDigits = 0;
+  for (const ch of digits) {
+    if (hi < 9e14) hi = hi * 10 + Number(ch);
+    else {
+      lo = lo * 10 + Number(ch);
+      loDigits++;
+    }
+  }
+  return [hi, lo, loDigits];
+}
+
 function agrees(digits: string, scale: number): boolean {
   const ours = read(digits, scale);
   return Number.isNaN(ours) || Object.is(ours, Number(`${digits}e${scale}`));
@@ -50,6 +69,28 @@ describe('decimalToDouble', () => {
       ),
       { numRuns: 20000 },
     );
+  });
+
+  it('matches Number() on 15 to 20 digits split as the reader splits them (property)', () => {
+    // 16 and 17 digits are what shortest round-trip printing (Python's repr) gives for most doubles.
+    let decided = 0;
+    fc.assert(
+      fc.property(
+        fc.stringMatching(/^[1-9][0-9]{14,19}$/),
+        fc.integer({ min: -22, max: 22 }),
+        (digits, scale) => {
+          const [hi, lo, loDigits] = readerSplit(digits);
+          if (loDigits > 4) return true;
+          const ours = decimalToDouble(hi, lo, loDigits, scale)
+            ? (decoded[0] as number)
+            : Number.NaN;
+          if (!Number.isNaN(ours)) decided++;
+          return Number.isNaN(ours) || Object.is(ours, Number(`${digits}e${scale}`));
+        },
+      ),
+      { numRuns: 20000 },
+    );
+    expect(decided).toBeGreaterThan(10000);
   });
 
   it('matches Number() on up to 15 digits (Clinger fast path) (property)', () => {

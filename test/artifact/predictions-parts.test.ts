@@ -16,6 +16,7 @@ import {
   hashed,
 } from '../../src/artifact/id-tables.js';
 import { Readable } from 'node:stream';
+import { IdBatch, MEET_BASE } from '../../src/artifact/id-batch.js';
 import { NEED, PredictionLines, ROW, streamReader } from '../../src/artifact/prediction-lines.js';
 import { InputError } from '../../src/model/errors.js';
 import { MAX_MAGNITUDE } from '../../src/model/limits.js';
@@ -25,6 +26,29 @@ const ids = fc.oneof(
   fc.integer({ min: 0, max: 5 }).map((i) => `${'long-'.repeat(15)}${i}`), // > INLINE_ID_BYTES
   fc.integer({ min: 0, max: 5 }).map((i) => `${'w'.repeat(20)}${i}`), // widens the table
 );
+
+describe('IdBatch', () => {
+  it('stores the id table hash of each id, the first word of hashId (property)', () => {
+    // The table meets rows by this hash (common practice: FNV-1a, murmur3's finaliser); the
+    // batch computes it while it copies the bytes, so it must be the same function.
+    fc.assert(
+      fc.property(
+        fc.array(fc.uint8Array({ minLength: 1, maxLength: INLINE_ID_BYTES }), {
+          minLength: 1,
+          maxLength: 20,
+        }),
+        (keys) => {
+          const batch = new IdBatch(keys.length);
+          keys.forEach((key, step) => batch.add(MEET_BASE, key, 0, key.length, step));
+          keys.forEach((key, r) => {
+            hashId(key, 0, key.length);
+            expect(batch.hash(r)).toBe(hashed.a);
+          });
+        },
+      ),
+    );
+  });
+});
 
 describe('IdTable', () => {
   it('pairs like the original two Maps, in a table that starts tiny (property)', () => {
@@ -120,6 +144,24 @@ describe('IdOrder', () => {
   });
 });
 
+/** Python's repr of a float (shortest round-trip digits; exponent form below 1e-4 and from 1e16). */
+function pythonRepr(x: number): string {
+  if (x === 0) return Object.is(x, -0) ? '-0.0' : '0.0';
+  const [mantissa, exp] = x.toExponential().split('e') as [string, string];
+  const e = Number(exp);
+  const negative = mantissa.startsWith('-');
+  const digits = mantissa.replace('-', '').replace('.', '');
+  const sign = negative ? '-' : '';
+  if (e < -4 || e >= 16) {
+    const m = digits.length === 1 ? digits : `${digits[0]}.${digits.slice(1)}`;
+    return `${sign}${m}e${e < 0 ? '-' : '+'}${String(Math.abs(e)).padStart(2, '0')}`;
+  }
+  if (e < 0) return `${sign}0.${'0'.repeat(-e - 1)}${digits}`;
+  const int = digits.slice(0, e + 1).padEnd(e + 1, '0');
+  const frac = digits.slice(e + 1);
+  return `${sign}${int}.${frac === '' ? '0' : frac}`;
+}
+
 async function losses(text: string, chunk: number): Promise<number[]> {
   const data = Buffer.from(text);
   const lines = new PredictionLines(
@@ -187,6 +229,34 @@ describe('PredictionLines number fast path', () => {
         },
       ),
       { numRuns: 200 },
+    );
+  });
+
+  it('reads losses as Python writes them (repr) to the same doubles as Number() (property)', async () => {
+    // Python's repr prints the shortest digits that round-trip (as JavaScript's String does), in
+    // fixed notation for exponents −4 to 15 and as d.ddde±XX otherwise (Python docs, "Floating
+    // Point Arithmetic: Issues and Limitations"; float_repr_style 'short'). Whole files in one
+    // chunk, so that a value's digits are read eight at a time. Source of the values: ECMA-262
+    // §7.1.4.1.1 StringToNumber (Number() of the same text).
+    const values = fc.oneof(
+      fc.double({ min: 0, max: 1, noNaN: true }),
+      fc.double({ min: -100, max: 100, noNaN: true }),
+      fc.double({ min: -MAX_MAGNITUDE, max: MAX_MAGNITUDE, noNaN: true }),
+      fc.double({ min: 1e-12, max: 1e-4, noNaN: true }),
+    );
+    await fc.assert(
+      fc.asyncProperty(fc.array(values, { minLength: 1, maxLength: 300 }), async (xs) => {
+        const texts = xs.map(pythonRepr);
+        const read = await losses(
+          `id,loss\n${texts.map((t, i) => `r${i},${t}\n`).join('')}`,
+          1 << 20,
+        );
+        expect(read.length).toBe(texts.length);
+        texts.forEach((t, i) => expect(Object.is(read[i], Number(t))).toBe(true));
+        // The text is the value's own shortest form: reading it back gives the value itself.
+        xs.forEach((x, i) => expect(Object.is(read[i], x)).toBe(true));
+      }),
+      { numRuns: 300 },
     );
   });
 
