@@ -1,11 +1,12 @@
-// npm run bench [-- --quick] [-- --turns N]
+// npm run bench [-- --quick] [-- --turns N] [-- --only inorder,shuffled,loss,startup,curve,10m]
 //
 // Builds dist/, generates the benchmark data with a fixed seed (bench/generate.mjs) into
 // $TMPDIR/fitgap-bench-<seed> (kept for the next run), and runs each comparison in alternating
 // turns (A, B, A, B, …), every run in its own process, after one untimed warm-up turn. Prints one
 // table of medians, spreads (min–max) and ratios against the targets, floor and peer included, and
 // the machine it ran on. Wall time is what is compared; CPU time (user + sys) and peak RSS come
-// from /usr/bin/time when it exists. --quick leaves out the 10M-row workloads.
+// from /usr/bin/time when it exists. --quick leaves out the 10M-row workloads; --only runs the named
+// groups (10m names both 10M groups) and prints their rows alone.
 import { spawnSync } from 'node:child_process';
 import {
   existsSync,
@@ -25,6 +26,11 @@ const args = process.argv.slice(2);
 const quick = args.includes('--quick');
 const turnsArg = args.indexOf('--turns');
 const TURNS = turnsArg >= 0 ? Number(args[turnsArg + 1]) : 5;
+const onlyArg = args.indexOf('--only');
+const only = onlyArg >= 0 ? new Set(args[onlyArg + 1].split(',')) : null;
+/** Whether the group runs: all of them unless --only names some (`10m` stands for both 10M groups). */
+const wanted = (key) =>
+  only === null || only.has(key) || (key.startsWith('10m') && only.has('10m'));
 const ROOT = resolve('.');
 const DATA = join(tmpdir(), `fitgap-bench-${SEED}`);
 const node = process.execPath;
@@ -157,7 +163,7 @@ const groups = [
         { key: '10m', members: ['fitgap 10M', 'fitgap 1M', 'floor 10M'], turns: 3 },
         { key: '10m-shuffled', members: ['fitgap 10M shuffled', 'fitgap 1M shuffled'], turns: 3 },
       ]),
-];
+].filter((g) => wanted(g.key));
 
 const results = {};
 const loads = [];
@@ -211,7 +217,7 @@ function agreement() {
   }
   return notes.join('; ');
 }
-const agreed = agreement();
+const agreed = wanted('inorder') && wanted('shuffled') ? agreement() : 'not checked (--only)';
 rmSync(scratch, { recursive: true, force: true });
 
 const median = (xs) => {
@@ -244,7 +250,7 @@ const rows = [];
 const row = (comparison, ours, ref, value, cpuValue, target, ok) =>
   rows.push([comparison, ours, ref, value, cpuValue, target, verdict(ok)]);
 
-{
+if (wanted('inorder')) {
   const r = ratio('inorder', 'fitgap 1M', 'floor 1M');
   row(
     'paired review, 2 × 1M `id,correct`, ids in order, vs floor',
@@ -256,7 +262,7 @@ const row = (comparison, ours, ref, value, cpuValue, target, ok) =>
     r <= 1.5 ? 'ok' : r <= 2.5 ? 'MISSED 1.5×; must met' : 'MISSED',
   );
 }
-if (python !== null) {
+if (wanted('inorder') && python !== null) {
   const r = ratio('inorder', 'peer 1M', 'fitgap 1M');
   const rss = stat('inorder', 'fitgap 1M', 'rss')?.med ?? NaN;
   row(
@@ -268,7 +274,7 @@ if (python !== null) {
     '≥ 6× faster; peak RSS ≤ 150 MB',
     r >= 6 && !(rss > 150),
   );
-} else
+} else if (wanted('inorder'))
   row(
     'the same vs the peer',
     cell('inorder', 'fitgap 1M'),
@@ -278,7 +284,7 @@ if (python !== null) {
     '≥ 6× faster; peak RSS ≤ 150 MB',
     null,
   );
-{
+if (wanted('shuffled')) {
   const r = ratio('shuffled', 'fitgap 1M shuffled', 'floor 1M shuffled');
   row(
     'candidate ids shuffled, 1M, vs floor',
@@ -300,7 +306,7 @@ if (python !== null) {
       true,
     );
 }
-{
+if (wanted('loss')) {
   const r = ratio('loss', 'fitgap 1M loss', 'fitgap 1M');
   row(
     '`id,loss` (paired t) vs `id,correct`, 1M',
@@ -312,7 +318,7 @@ if (python !== null) {
     r <= 1.3,
   );
 }
-if (!quick) {
+if (!quick && wanted('10m')) {
   const r = ratio('10m', 'fitgap 10M', 'fitgap 1M');
   const rss = stat('10m', 'fitgap 10M', 'rss')?.med ?? NaN;
   row(
@@ -345,7 +351,7 @@ if (!quick) {
     s <= 11 && !(srss > 600),
   );
 }
-for (const entry of ['CLI', 'action']) {
+for (const entry of wanted('startup') ? ['CLI', 'action'] : []) {
   const name = `fitgap start-up (${entry})`;
   const plus = stat('startup', name).med - stat('startup', "node -e ''").med;
   const cpuPlus = stat('startup', name, 'cpu').med - stat('startup', "node -e ''", 'cpu').med;
@@ -359,7 +365,7 @@ for (const entry of ['CLI', 'action']) {
     plus <= 80,
   );
 }
-{
+if (wanted('curve')) {
   // A curve holds at most 10,000 points (src/model/limits.ts): the target was set for 1M points,
   // which are now refused at once; at 10,000 both sides are mostly Node's start-up.
   const r = ratio('curve', 'fitgap curve 10k', 'floor curve 10k');
