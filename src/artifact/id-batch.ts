@@ -21,8 +21,8 @@ export class IdBatch {
   size = 0;
   /** Longest id in the batch. */
   longest = 0;
-  private width = 8;
-  private stride = HEAD + 8 / 4;
+  private width: number;
+  private stride: number;
   private words: Uint32Array;
   private bytes: Uint8Array;
   /** Values of the records (written by the caller after `add`: a double argument is boxed). */
@@ -34,11 +34,22 @@ export class IdBatch {
   private group = new Int32Array(0);
   private counts = new Int32Array(0);
 
-  constructor(readonly capacity: number) {
+  /** `width`: bytes kept for each id at first (a multiple of 4; the batch widens for longer ids). */
+  constructor(
+    readonly capacity: number,
+    width = 8,
+  ) {
+    this.width = width;
+    this.stride = HEAD + width / 4;
     this.words = new Uint32Array(capacity * this.stride);
     this.bytes = new Uint8Array(this.words.buffer);
     this.values = new Float64Array(capacity);
     this.spareValues = new Float64Array(0);
+  }
+
+  /** Bytes kept for each id (a new batch may start with the width its predecessor reached). */
+  get idWidth(): number {
+    return this.width;
   }
 
   get full(): boolean {

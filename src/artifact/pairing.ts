@@ -23,18 +23,26 @@ const BATCH = 4096;
  * Table operations are batched over `window` steps and applied in order of table regions of
  * 2^regionBits slots (16 slots, a few cache lines: a batch then sweeps the table from one end to
  * the other, which the processor's prefetching follows; regions of 4096 slots measured about 4 %
- * slower on shuffled ids). The window doubles, up to `maxWindow`, while the table has more than
- * 16 slots per step of it: a batch then still lands on a few neighbouring slots per page, where a
- * fixed window of 32,768 steps spread its probes over a table of tens of millions of slots one
- * page apart (10M shuffled ids: 8.5 s of CPU with 32,768, 5.8 s with 262,144; 280 MB peak).
+ * slower on shuffled ids). Once the table has `growFrom` slots or more (2^21 slots of 20 bytes:
+ * larger than a processor's last-level cache), the window doubles, up to `maxWindow`, while the
+ * table has more than 16 slots per step of it: a batch then still lands on a few neighbouring
+ * slots per page, where a fixed window of 32,768 steps spread its probes over a table of tens of
+ * millions of slots one page apart (10M shuffled ids: 8.5 s of CPU with 32,768, 5.8 s with
+ * 262,144; 280 MB peak). A smaller table gains nothing from a larger batch and pays for its memory.
  * Smaller windows only for tests: they reorder operations much more.
  */
 export interface PairingTuning {
   window: number;
   regionBits: number;
   maxWindow: number;
+  growFrom: number;
 }
-export const TUNING: PairingTuning = { window: 32768, regionBits: 4, maxWindow: 262144 };
+export const TUNING: PairingTuning = {
+  window: 32768,
+  regionBits: 4,
+  maxWindow: 262144,
+  growFrom: 1 << 21,
+};
 /** Table slots per step of the window below which the window doubles (see PairingTuning). */
 const SLOTS_PER_STEP = 16;
 /** Loss values beyond this can overflow a difference: then pairs are settled step by step. */
@@ -225,11 +233,15 @@ export class Pairing {
     }
     this.windowStart = this.step;
     const { table, tuning } = this;
-    if (this.window < tuning.maxWindow && table.slots > SLOTS_PER_STEP * this.window) {
+    if (
+      this.window < tuning.maxWindow &&
+      table.slots >= tuning.growFrom &&
+      table.slots > SLOTS_PER_STEP * this.window
+    ) {
       // Nothing waits in the batch or the ring now: both start afresh, larger.
       while (this.window < tuning.maxWindow && table.slots > SLOTS_PER_STEP * this.window)
         this.window = Math.min(tuning.maxWindow, 2 * this.window);
-      this.batch = new IdBatch(2 * this.window);
+      this.batch = new IdBatch(2 * this.window, this.batch.idWidth);
       if (!this.proportion) this.ring = new Float64Array(3 * this.window).fill(Number.NaN);
     }
   }

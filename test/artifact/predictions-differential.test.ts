@@ -280,6 +280,7 @@ describe('byte-level predictions reader = string reader', () => {
             window,
             regionBits,
             maxWindow: window * 2 ** growth,
+            growFrom: 0,
           })),
         async (xs, ys, losses, unique, sortBase, kind, tuning) => {
           const prep = (list: number[]): number[] => {
