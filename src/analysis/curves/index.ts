@@ -16,6 +16,7 @@ import { gapTrend } from './gap-trend.js';
 import { downsampleKeeping } from './lttb.js';
 import { MIN_POWER_LAW_POINTS, fitPowerLaw } from './power-law.js';
 import { regularizationMinimum } from './regularization.js';
+import { sweepSuggestion } from '../levers/rounding.js';
 import type {
   CurvesReport,
   CurveSkipped,
@@ -176,7 +177,11 @@ function analyzeRegularization(
     bestX: result.bestX,
     bestValidation: (points[result.bestIndex] as CurvePoint).validation,
     side: result.side,
-    suggestedX: result.suggestedX,
+    // The strength a person would type: the same value the regularization lever suggests.
+    suggestedX: sweepSuggestion(
+      result.atEdge === null ? result.bestX : result.suggestedX,
+      result.atEdge === null ? points.map((p) => p.x) : null,
+    ),
     atEdge: result.atEdge,
     refined: result.refined,
     chart: chart(points, scale, [result.bestIndex]),

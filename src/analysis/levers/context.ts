@@ -20,7 +20,6 @@ import type { HyperparameterRole } from '../../model/hyperparameter-roles.js';
 import type { RegularizationKnob } from './knobs.js';
 import type { PrChange } from './pr-changes.js';
 import type { Vocabulary } from './resolve-knob.js';
-import { roundSuggestion } from './rounding.js';
 
 export interface LeverContext {
   goal: Goal;
@@ -121,13 +120,8 @@ export function sweepSuggestion(
   knob: RegularizationKnob,
   wants: 'stronger' | 'weaker',
 ): Suggestion | undefined {
-  const grid = sweep.chart.map((p) => p.x).filter((x) => Number.isFinite(x));
-  const lo = Math.min(...grid);
-  const hi = Math.max(...grid);
-  const value =
-    sweep.atEdge === null && grid.length > 0
-      ? roundSuggestion(sweep.bestX, { grid, range: [lo, hi] })
-      : roundSuggestion(sweep.suggestedX);
+  // Rounded where the curve was analysed (curves/index.ts `sweepSuggestion`).
+  const value = sweep.suggestedX;
   const up = (wants === 'stronger') !== knob.inverse;
   if (up ? !(value > knob.value) : !(value < knob.value)) return undefined;
   return {

@@ -97,6 +97,23 @@ function fewestDigits(x: number, lo: number, hi: number, integer: boolean): numb
 }
 
 /**
+ * The strength a regularization sweep suggests, as a person would type it: `x` (the sweep's
+ * minimum) rounded within the swept grid, or, for a minimum at an end of the sweep (`grid` null),
+ * the step beyond it rounded freely.
+ */
+export function sweepSuggestion(x: number, grid: readonly number[] | null): number {
+  const finite = grid?.filter((v) => Number.isFinite(v)) ?? [];
+  if (finite.length === 0) return roundSuggestion(x);
+  let lo = Infinity;
+  let hi = -Infinity;
+  for (const v of finite) {
+    if (v < lo) lo = v;
+    if (v > hi) hi = v;
+  }
+  return roundSuggestion(x, { grid: finite, range: [lo, hi] });
+}
+
+/**
  * A value a person would type near `x`: see the module comment. When an integer knob's range holds
  * no integer, the nearest integer to the clamped value (outside the range) is returned.
  * @example roundSuggestion(333.333333, { integer: true }) // 330

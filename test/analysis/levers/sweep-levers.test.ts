@@ -7,6 +7,7 @@
 import { describe, expect, it } from 'vitest';
 import { buildReview } from '../../../src/analysis/review.js';
 import { chooseLevers } from '../../../src/analysis/levers/choose.js';
+import { sweepSuggestion } from '../../../src/analysis/levers/rounding.js';
 import type { RegularizationEvidence } from '../../../src/model/review.js';
 import { makeRun, SETTINGS } from '../make-run.js';
 import { contextFor } from './lever-context.js';
@@ -56,14 +57,16 @@ describe('regularization sweep and levers', () => {
     expect(review.levers.map((l) => l.id)).not.toContain('stronger-regularization');
   });
 
+  const GRID = [0.01, 0.03, 0.1, 0.3, 1, 3];
+  // As the curve analysis writes it: the suggestion is the minimum rounded to the sweep's grid.
   const sweep = (side: RegularizationEvidence['side'], bestX: number): RegularizationEvidence => ({
     bestX,
     bestValidation: 0.08,
     side,
-    suggestedX: bestX,
+    suggestedX: sweepSuggestion(bestX, GRID),
     atEdge: null,
     refined: true,
-    chart: [0.01, 0.03, 0.1, 0.3, 1, 3].map((x) => ({ x, train: 0.05, validation: 0.09 })),
+    chart: GRID.map((x) => ({ x, train: 0.05, validation: 0.09 })),
   });
 
   it('offers neither regularization lever when the candidate sits at the sweep minimum', () => {
