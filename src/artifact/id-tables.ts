@@ -75,18 +75,39 @@ export class IdOrder {
     prevStart: number,
     prevLen: number,
   ): boolean {
-    if (prevLen < 0) return true;
-    let cmp = 0;
-    const n = len < prevLen ? len : prevLen;
-    for (let i = 0; i < n; i++) {
-      cmp = (key[start + i] as number) - (prev[prevStart + i] as number);
-      if (cmp !== 0) break;
-    }
-    if (cmp === 0) cmp = len - prevLen;
-    if (cmp <= 0) this.lex = false;
-    if (len !== prevLen ? len < prevLen : cmp <= 0) this.shortlex = false;
+    return this.take(idSteps(key, start, len, prev, prevStart, prevLen));
+  }
+
+  /** Takes the next id by its `idSteps` code (the same code serves two files with the same ids). */
+  take(code: number): boolean {
+    if ((code & LEX_UP) === 0) this.lex = false;
+    if ((code & SHORTLEX_UP) === 0) this.shortlex = false;
     return this.lex || this.shortlex;
   }
+}
+
+/** `idSteps` bits: the id comes after the one before it by bytes, and by length then bytes. */
+const LEX_UP = 1;
+const SHORTLEX_UP = 2;
+
+/** How an id follows the one before it (prevLen −1: no id before it, both bits). */
+export function idSteps(
+  key: Uint8Array,
+  start: number,
+  len: number,
+  prev: Uint8Array,
+  prevStart: number,
+  prevLen: number,
+): number {
+  if (prevLen < 0) return LEX_UP | SHORTLEX_UP;
+  let cmp = 0;
+  const n = len < prevLen ? len : prevLen;
+  for (let i = 0; i < n; i++) {
+    cmp = (key[start + i] as number) - (prev[prevStart + i] as number);
+    if (cmp !== 0) break;
+  }
+  if (cmp === 0) cmp = len - prevLen;
+  return (cmp > 0 ? LEX_UP : 0) | ((len !== prevLen ? len > prevLen : cmp > 0) ? SHORTLEX_UP : 0);
 }
 
 const EMPTY_KEY_B = 1;

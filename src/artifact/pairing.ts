@@ -6,7 +6,7 @@ import type { MetricKind } from '../model/run.js';
 import { RunningStats } from '../stats/index.js';
 import { IdBatch, MEET_BASE, MEET_CAND } from './id-batch.js';
 import type { IdTable } from './id-tables.js';
-import { BASE, CAND, INLINE_ID_BYTES, IdOrder, sameBytes } from './id-tables.js';
+import { BASE, CAND, INLINE_ID_BYTES, IdOrder, idSteps, sameBytes } from './id-tables.js';
 import { NEED, ROW, type PredictionLines } from './prediction-lines.js';
 
 /** `run()` results. */
@@ -81,6 +81,8 @@ export class Pairing {
   private window: number;
   private ringUsed = false;
   private strict = false;
+  /** The last step's rows had the same id (then each file's previous id is the same too). */
+  private lockstep = false;
   private readonly orderA = new IdOrder();
   private readonly orderB = new IdOrder();
   private readonly pending = new Float64Array(BATCH);
@@ -141,24 +143,27 @@ export class Pairing {
       const hasA = this.hasA;
       const hasB = this.hasB;
       if (!hasA && !hasB) return DONE;
-      if (
-        hasA &&
-        (this.unordered & BASE) === 0 &&
-        !this.orderA.next(a.key, a.keyStart, a.keyLen, a.prevKey, a.prevStart, a.prevLen)
-      )
-        this.unordered |= BASE;
-      if (
-        hasB &&
-        (this.unordered & CAND) === 0 &&
-        !this.orderB.next(b.key, b.keyStart, b.keyLen, b.prevKey, b.prevStart, b.prevLen)
-      )
-        this.unordered |= CAND;
+      const same =
+        hasA && hasB && sameBytes(a.key, a.keyStart, a.keyLen, b.key, b.keyStart, b.keyLen);
+      // In lockstep (this step's ids and the last step's are the same in both files), the
+      // candidate's id follows its last one as the baseline's does: one comparison serves both.
+      let steps = -1;
+      if (hasA && (this.unordered & BASE) === 0) {
+        steps = idSteps(a.key, a.keyStart, a.keyLen, a.prevKey, a.prevStart, a.prevLen);
+        if (!this.orderA.take(steps)) this.unordered |= BASE;
+      }
+      if (hasB && (this.unordered & CAND) === 0) {
+        if (!(same && this.lockstep && steps >= 0))
+          steps = idSteps(b.key, b.keyStart, b.keyLen, b.prevKey, b.prevStart, b.prevLen);
+        if (!this.orderB.take(steps)) this.unordered |= CAND;
+      }
+      this.lockstep = same;
       const step = this.step;
       if (!this.proportion && !this.strict) {
         if ((hasA && !(Math.abs(a.value) <= HUGE)) || (hasB && !(Math.abs(b.value) <= HUGE)))
           this.strict = true;
       }
-      if (hasA && hasB && sameBytes(a.key, a.keyStart, a.keyLen, b.key, b.keyStart, b.keyLen)) {
+      if (same) {
         this.rows++;
         const x = a.value;
         const y = b.value;

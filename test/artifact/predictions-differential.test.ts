@@ -315,6 +315,17 @@ describe('byte-level predictions reader = string reader', () => {
     expect(await outcome(() => pairPredictions(b, c, 'proportion'))).toBe(expected);
   });
 
+  it('checks the candidate ids own order when a pair follows rows out of step', async () => {
+    // Step 2 pairs "d" with "d", but the step before was out of step ("c" beside "d"): the
+    // baseline's "c" → "d" increases, the candidate's "d" → "d" repeats. Only in lockstep may the
+    // baseline's order stand for the candidate's.
+    const b = write(utf8('id,correct\nc,1\nd,1\n'));
+    const c = write(utf8('id,correct\nd,1\nd,0\n'));
+    const expected = await outcome(() => referencePairPredictions(b, c, 'proportion'));
+    expect(expected).toMatch(/line 3 must have a unique id \(also on line 2\)/);
+    expect(await outcome(() => pairPredictions(b, c, 'proportion'))).toBe(expected);
+  });
+
   it('still sees a repeated id when the read before it overwrote the previous id', async () => {
     // The second read lands a newline where the first row's id was: only a saved copy of that id
     // shows that "b" repeats (the ids look increasing otherwise).
