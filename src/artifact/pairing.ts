@@ -6,7 +6,7 @@ import type { MetricKind } from '../model/run.js';
 import { RunningStats } from '../stats/index.js';
 import { IdBatch, MEET_BASE, MEET_CAND } from './id-batch.js';
 import type { IdTable } from './id-tables.js';
-import { BASE, CAND, INLINE_ID_BYTES, IdOrder, idSteps, sameBytes } from './id-tables.js';
+import { BASE, CAND, INLINE_ID_BYTES, IdOrder, idSteps, sameIds } from './id-tables.js';
 import { NEED, ROW, type PredictionLines } from './prediction-lines.js';
 
 /** `run()` results. */
@@ -144,17 +144,17 @@ export class Pairing {
       const hasB = this.hasB;
       if (!hasA && !hasB) return DONE;
       const same =
-        hasA && hasB && sameBytes(a.key, a.keyStart, a.keyLen, b.key, b.keyStart, b.keyLen);
+        hasA && hasB && sameIds(a.keyView, a.keyStart, a.keyLen, b.keyView, b.keyStart, b.keyLen);
       // In lockstep (this step's ids and the last step's are the same in both files), the
       // candidate's id follows its last one as the baseline's does: one comparison serves both.
       let steps = -1;
       if (hasA && (this.unordered & BASE) === 0) {
-        steps = idSteps(a.key, a.keyStart, a.keyLen, a.prevKey, a.prevStart, a.prevLen);
+        steps = idSteps(a.keyView, a.keyStart, a.keyLen, a.prevView, a.prevStart, a.prevLen);
         if (!this.orderA.take(steps)) this.unordered |= BASE;
       }
       if (hasB && (this.unordered & CAND) === 0) {
         if (!(same && this.lockstep && steps >= 0))
-          steps = idSteps(b.key, b.keyStart, b.keyLen, b.prevKey, b.prevStart, b.prevLen);
+          steps = idSteps(b.keyView, b.keyStart, b.keyLen, b.prevView, b.prevStart, b.prevLen);
         if (!this.orderB.take(steps)) this.unordered |= CAND;
       }
       this.lockstep = same;

@@ -76,24 +76,31 @@ function fourDigits(w: number): number {
   return (pairs & 0xff) * 100 + (pairs >>> 16);
 }
 
+/** A DataView of exactly the bytes of `buf`. */
+function viewOf(buf: Buffer): DataView {
+  return new DataView(buf.buffer, buf.byteOffset, buf.length);
+}
+
 export class PredictionLines {
   /** 1-based number of the last line read (readline's count: header and blank lines included). */
   line = 0;
   /** Data rows read. */
   rows = 0;
-  /** The current row (after `advance()` returned ROW). */
+  /** The current row (after `advance()` returned ROW); `keyView` reads the same bytes as `key`. */
   key: Buffer;
+  keyView: DataView;
   keyStart = 0;
   keyLen = 0;
   value = 0;
   /** The previous row's id (prevLen −1 before the second row). */
   prevKey: Buffer;
+  prevView: DataView;
   prevStart = 0;
   prevLen = -1;
 
   private buf: Buffer = Buffer.allocUnsafe(CHUNK);
   /** `buf` read four bytes at a time (digits eight at a time in `number`). */
-  private view = new DataView(this.buf.buffer, this.buf.byteOffset, this.buf.length);
+  private view = viewOf(this.buf);
   private pos = 0;
   /** Bytes before `buf[0]`. */
   private dropped = 0;
@@ -102,8 +109,10 @@ export class PredictionLines {
   private pending: string[] | null = null;
   private pendingAt = 0;
   private scratch: Buffer = Buffer.allocUnsafe(256);
+  private scratchView = viewOf(this.scratch);
   /** A copy of the last row's id when its bytes are about to be overwritten. */
   private saved: Buffer = Buffer.allocUnsafe(256);
+  private savedView = viewOf(this.saved);
   private readonly proportion: boolean;
 
   constructor(
@@ -112,7 +121,9 @@ export class PredictionLines {
     readonly kind: MetricKind,
   ) {
     this.key = this.buf;
+    this.keyView = this.view;
     this.prevKey = this.buf;
+    this.prevView = this.view;
     this.proportion = kind === 'proportion';
   }
 
@@ -126,7 +137,7 @@ export class PredictionLines {
       const bigger = Buffer.allocUnsafe(this.buf.length * 2);
       this.buf.copy(bigger, 0, this.pos, this.end);
       this.buf = bigger;
-      this.view = new DataView(bigger.buffer, bigger.byteOffset, bigger.length);
+      this.view = viewOf(bigger);
     } else if (this.pos > 0) this.buf.copyWithin(0, this.pos, this.end);
     this.pos = 0;
     this.end = rest;
@@ -201,9 +212,11 @@ export class PredictionLines {
         p = after;
       }
       this.prevKey = this.key;
+      this.prevView = this.keyView;
       this.prevStart = this.keyStart;
       this.prevLen = this.rows === 0 ? -1 : this.keyLen;
       this.key = buf;
+      this.keyView = this.view;
       this.keyStart = start;
       this.keyLen = idEnd - start;
       this.line++;
@@ -357,12 +370,17 @@ export class PredictionLines {
       this.value = parseValue(text.slice(comma + 1), this.kind, this.file, this.line);
       if (this.key === this.scratch) this.save();
       this.prevKey = this.key;
+      this.prevView = this.keyView;
       this.prevStart = this.keyStart;
       this.prevLen = this.rows === 0 ? -1 : this.keyLen;
       const length = Buffer.byteLength(id, 'utf8');
-      if (length > this.scratch.length) this.scratch = Buffer.allocUnsafe(length * 2);
+      if (length > this.scratch.length) {
+        this.scratch = Buffer.allocUnsafe(length * 2);
+        this.scratchView = viewOf(this.scratch);
+      }
       this.scratch.write(id, 0, 'utf8');
       this.key = this.scratch;
+      this.keyView = this.scratchView;
       this.keyStart = 0;
       this.keyLen = length;
       this.rows++;
@@ -384,9 +402,13 @@ export class PredictionLines {
 
   /** Moves the last row's id to `saved` before the buffer holding it is reused. */
   private save(): void {
-    if (this.keyLen > this.saved.length) this.saved = Buffer.allocUnsafe(this.keyLen * 2);
+    if (this.keyLen > this.saved.length) {
+      this.saved = Buffer.allocUnsafe(this.keyLen * 2);
+      this.savedView = viewOf(this.saved);
+    }
     this.key.copy(this.saved, 0, this.keyStart, this.keyStart + this.keyLen);
     this.key = this.saved;
+    this.keyView = this.savedView;
     this.keyStart = 0;
   }
 

@@ -114,10 +114,10 @@ export async function checkPredictions(source: PredictionsFile, kind: MetricKind
       if (
         increasing &&
         !order.next(
-          reader.key,
+          reader.keyView,
           reader.keyStart,
           reader.keyLen,
-          reader.prevKey,
+          reader.prevView,
           reader.prevStart,
           reader.prevLen,
         )

@@ -10,6 +10,7 @@ import {
   CAND,
   HashSet64,
   IdOrder,
+  sameIds,
   INLINE_ID_BYTES,
   IdTable,
   hashId,
@@ -125,24 +126,65 @@ describe('IdOrder', () => {
     const byLength = (x: Buffer, y: Buffer): number =>
       x.length !== y.length ? x.length - y.length : Buffer.compare(x, y);
     fc.assert(
-      fc.property(fc.array(fc.stringMatching(/^[a-c0-9]{1,4}$/), { maxLength: 12 }), (list) => {
-        const keys = list.map((s) => Buffer.from(s));
-        const order = new IdOrder();
-        let ok = true;
-        keys.forEach((key, i) => {
-          const prev = keys[i - 1] ?? Buffer.alloc(0);
-          const result = order.next(key, 0, key.length, prev, 0, i === 0 ? -1 : prev.length);
-          if (!ok) return;
-          const prefix = keys.slice(0, i + 1);
-          const increasing = (cmp: (x: Buffer, y: Buffer) => number): boolean =>
-            prefix.every((k, j) => j === 0 || cmp(prefix[j - 1] as Buffer, k) < 0);
-          expect(result).toBe(increasing(byBytes) || increasing(byLength));
-          ok = result;
-        });
-      }),
+      // Up to 11 bytes of a small alphabet: long common prefixes, and ids that differ in a whole
+      // four-byte word, in its last byte or only in the tail after the words.
+      fc.property(
+        fc.array(fc.stringMatching(/^[ab0-9\xff]{1,11}$/), { maxLength: 12 }),
+        fc.nat(7),
+        (list, pad) => {
+          const keys = list.map((s) => Buffer.from(s, 'latin1'));
+          const order = new IdOrder();
+          let ok = true;
+          keys.forEach((key, i) => {
+            const prev = keys[i - 1] ?? Buffer.alloc(0);
+            const result = order.next(
+              ...placed(key, pad),
+              key.length,
+              ...placed(prev, pad + 3),
+              i === 0 ? -1 : prev.length,
+            );
+            if (!ok) return;
+            const prefix = keys.slice(0, i + 1);
+            const increasing = (cmp: (x: Buffer, y: Buffer) => number): boolean =>
+              prefix.every((k, j) => j === 0 || cmp(prefix[j - 1] as Buffer, k) < 0);
+            expect(result).toBe(increasing(byBytes) || increasing(byLength));
+            ok = result;
+          });
+        },
+      ),
     );
   });
 });
+
+describe('sameIds', () => {
+  it('is Buffer.equals on the two ids wherever they sit in their views (property)', () => {
+    fc.assert(
+      fc.property(
+        fc.uint8Array({ maxLength: 13 }),
+        fc.uint8Array({ maxLength: 13 }),
+        // The second id: the first one, another one, or the first with one byte changed.
+        fc.constantFrom('same', 'other', 'one byte'),
+        fc.nat(),
+        fc.nat(7),
+        fc.nat(7),
+        (x, y, how, at, px, py) => {
+          const a = Buffer.from(x);
+          const b = Buffer.from(how === 'other' ? y : x);
+          if (how === 'one byte' && b.length > 0)
+            b.writeUInt8(b.readUInt8(at % b.length) ^ (1 + (at % 255)), at % b.length);
+          expect(sameIds(...placed(a, px), a.length, ...placed(b, py), b.length)).toBe(a.equals(b));
+        },
+      ),
+    );
+  });
+});
+
+/** `bytes` copied into a larger buffer at offset `pad`, as a view of that buffer and the offset. */
+function placed(bytes: Buffer, pad: number): [DataView, number] {
+  const host = Buffer.alloc(pad + bytes.length + 5, 0x61);
+  bytes.copy(host, pad);
+  return [new DataView(host.buffer, host.byteOffset, host.length), pad];
+}
 
 /** Python's repr of a float (shortest round-trip digits; exponent form below 1e-4 and from 1e16). */
 function pythonRepr(x: number): string {
