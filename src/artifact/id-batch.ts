@@ -56,13 +56,17 @@ export class IdBatch {
     return this.size === this.capacity;
   }
 
-  /** Adds a record; its hash is the id table's (`slotHash`), computed while the bytes are copied. */
+  /**
+   * Adds a record; its hash is the id table's (`slotHash`), computed while the bytes are copied.
+   * The bytes after the id in its last word are zero (the id table compares whole words).
+   */
   add(kind: number, key: Uint8Array, start: number, len: number, step: number): void {
     if (len > this.width) this.widen(len);
     const r = this.size++;
     const at = r * this.stride;
     const words = this.words;
     const bytes = this.bytes;
+    if (len > 0) words[at + HEAD + ((len - 1) >>> 2)] = 0;
     let fnv = FNV_BASIS;
     for (let k = 0, b = (at + HEAD) * 4; k < len; k++) {
       const c = key[start + k] as number;
@@ -136,12 +140,13 @@ export class IdBatch {
   len(r: number): number {
     return (this.words[r * this.stride + 2] as number) >>> 3;
   }
-  /** Byte offset of record r's id in `keys`. */
-  keyStart(r: number): number {
-    return (r * this.stride + HEAD) * 4;
+  /** Index of record r's id in `keyWords` (its first word). */
+  keyWord(r: number): number {
+    return r * this.stride + HEAD;
   }
-  get keys(): Uint8Array {
-    return this.bytes;
+  /** The records' words: ids as IdTable.meet takes them. */
+  get keyWords(): Uint32Array {
+    return this.words;
   }
   value(r: number): number {
     return this.values[r] as number;

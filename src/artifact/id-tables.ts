@@ -1,7 +1,7 @@
 /**
  * Flat tables keyed on the bytes of prediction ids, for pairing millions of rows without a string
- * or an object per row: a hash of an id, a check that ids keep increasing (then no id can repeat
- * and nothing needs remembering), an open-addressing table of ids, and a set of 64-bit hashes.
+ * or an object per row: a hash of an id, an open-addressing table of ids, and a set of 64-bit
+ * hashes. (Id comparisons, and the check that ids keep increasing, are in id-compare.ts.)
  */
 
 /**
@@ -40,94 +40,6 @@ export const FNV_PRIME = 0x01000193;
  */
 export function slotHash(fnv: number): number {
   return mix(fnv) & 0x7fffffff;
-}
-
-/**
- * Whether two ids are the same bytes. Ids are read through DataViews four bytes at a time (one
- * comparison where a byte loop makes four; ids are mostly 8 to 40 bytes).
- */
-export function sameIds(
-  x: DataView,
-  xs: number,
-  xl: number,
-  y: DataView,
-  ys: number,
-  yl: number,
-): boolean {
-  if (xl !== yl) return false;
-  let i = 0;
-  for (; i + 4 <= xl; i += 4) if (x.getUint32(xs + i) !== y.getUint32(ys + i)) return false;
-  for (; i < xl; i++) if (x.getUint8(xs + i) !== y.getUint8(ys + i)) return false;
-  return true;
-}
-
-/**
- * Whether the ids of one file keep strictly increasing, by bytes or by length then bytes
- * (`order-9` < `order-10`). While either holds, the file has no repeated id.
- */
-export class IdOrder {
-  private lex = true;
-  private shortlex = true;
-
-  /**
-   * Takes the next id, given with the one before it (prevLen −1 for the first); false from the
-   * first id that breaks both orders.
-   */
-  next(
-    key: DataView,
-    start: number,
-    len: number,
-    prev: DataView,
-    prevStart: number,
-    prevLen: number,
-  ): boolean {
-    return this.take(idSteps(key, start, len, prev, prevStart, prevLen));
-  }
-
-  /** Takes the next id by its `idSteps` code (the same code serves two files with the same ids). */
-  take(code: number): boolean {
-    if ((code & LEX_UP) === 0) this.lex = false;
-    if ((code & SHORTLEX_UP) === 0) this.shortlex = false;
-    return this.lex || this.shortlex;
-  }
-}
-
-/** `idSteps` bits: the id comes after the one before it by bytes, and by length then bytes. */
-const LEX_UP = 1;
-const SHORTLEX_UP = 2;
-
-/**
- * How an id follows the one before it (prevLen −1: no id before it, both bits). Big-endian words
- * compare as their bytes do, so the first unequal word decides the byte order.
- */
-export function idSteps(
-  key: DataView,
-  start: number,
-  len: number,
-  prev: DataView,
-  prevStart: number,
-  prevLen: number,
-): number {
-  if (prevLen < 0) return LEX_UP | SHORTLEX_UP;
-  let cmp = 0;
-  const n = len < prevLen ? len : prevLen;
-  let i = 0;
-  for (; i + 4 <= n; i += 4) {
-    const x = key.getUint32(start + i);
-    const y = prev.getUint32(prevStart + i);
-    if (x !== y) {
-      cmp = x > y ? 1 : -1;
-      break;
-    }
-  }
-  if (cmp === 0) {
-    for (; i < n; i++) {
-      cmp = key.getUint8(start + i) - prev.getUint8(prevStart + i);
-      if (cmp !== 0) break;
-    }
-  }
-  if (cmp === 0) cmp = len - prevLen;
-  return (cmp > 0 ? LEX_UP : 0) | ((len !== prevLen ? len > prevLen : cmp > 0) ? SHORTLEX_UP : 0);
 }
 
 const EMPTY_KEY_B = 1;
@@ -222,7 +134,6 @@ export class IdTable {
   private stride = 2 + 8 / 4;
   private count = 0;
   private words: Uint32Array;
-  private bytes: Uint8Array;
   private values: Float64Array | null;
   /** Steps of waiting loss rows (their order decides the order of the differences). */
   private steps: Uint32Array | null;
@@ -236,7 +147,6 @@ export class IdTable {
     this.cap = slots;
     this.scale = slots / 2 ** 31;
     this.words = new Uint32Array(slots * this.stride);
-    this.bytes = new Uint8Array(this.words.buffer);
     this.values = losses ? new Float64Array(slots) : null;
     this.steps = losses ? new Uint32Array(slots) : null;
   }
@@ -273,13 +183,14 @@ export class IdTable {
   /**
    * A row of `side` out of step with the other file: pairs with a waiting row of the other file
    * (true; its value and step in `partner`, `partnerStep`) or waits (false). `incoming` and
-   * `incomingStep` hold the row's value and step.
+   * `incomingStep` hold the row's value and step. The id (at most INLINE_ID_BYTES) is
+   * `key[from, from + ceil(len / 4))` as words, the bytes after its last one zero (as IdBatch
+   * keeps them): ids are compared and copied a word at a time.
    */
-  meet(side: number, key: Uint8Array, start: number, len: number, hash: number): boolean {
-    if (len > INLINE_ID_BYTES) return this.longMeet(side, key, start, len);
-    const slot = this.find(key, start, len, hash);
+  meet(side: number, key: Uint32Array, from: number, len: number, hash: number): boolean {
+    const slot = this.find(key, from, len, hash);
     if (slot < 0) {
-      this.insert(~slot, key, start, len, hash, side);
+      this.insert(~slot, key, from, len, hash, side);
       return false;
     }
     const at = slot * this.stride + 1;
@@ -300,7 +211,8 @@ export class IdTable {
     return true;
   }
 
-  private longMeet(side: number, key: Uint8Array, start: number, len: number): boolean {
+  /** `meet` for an id longer than INLINE_ID_BYTES (kept apart, in a Map), as bytes. */
+  meetLong(side: number, key: Uint8Array, start: number, len: number): boolean {
     const id = latin1(key, start, len);
     const entry = this.long.get(id);
     if (entry === undefined) {
@@ -324,23 +236,19 @@ export class IdTable {
   }
 
   /** Slot of the id, or ~slot where it would go. */
-  private find(key: Uint8Array, start: number, len: number, hash: number): number {
+  private find(key: Uint32Array, from: number, len: number, hash: number): number {
     if (len > this.width || this.count + 1 > this.cap * LOAD) this.grow(len);
-    const { words, bytes, stride, cap } = this;
+    const { words, stride, cap } = this;
+    const n = (len + 3) >>> 2;
     let i = this.home(hash);
     for (;;) {
       const at = i * stride;
       const word = words[at + 1] as number;
       if (word === 0) return ~i;
       if (word >>> LEN_SHIFT === len && words[at] === hash) {
-        let b = (at + 2) * 4;
-        let k = start;
-        const stop = start + len;
-        while (k < stop && bytes[b] === key[k]) {
-          b++;
-          k++;
-        }
-        if (k === stop) return i;
+        let k = 0;
+        while (k < n && words[at + 2 + k] === key[from + k]) k++;
+        if (k === n) return i;
       }
       i = i + 1 === cap ? 0 : i + 1;
     }
@@ -348,15 +256,15 @@ export class IdTable {
 
   private insert(
     slot: number,
-    key: Uint8Array,
-    start: number,
+    key: Uint32Array,
+    from: number,
     len: number,
     hash: number,
     bits: number,
   ): void {
     const at = slot * this.stride;
-    const bytes = this.bytes;
-    for (let k = 0, b = (at + 2) * 4; k < len; k++) bytes[b + k] = key[start + k] as number;
+    const words = this.words;
+    for (let k = 0, n = (len + 3) >>> 2; k < n; k++) words[at + 2 + k] = key[from + k] as number;
     this.count++;
     this.words[at] = hash;
     this.store(slot, len << LEN_SHIFT, bits);
@@ -391,7 +299,9 @@ export class IdTable {
       const home = this.home(words[j * stride] as number);
       // Leave j where it is when its home slot lies cyclically in (i, j].
       if (i <= j ? i < home && home <= j : i < home || home <= j) continue;
-      words.copyWithin(i * stride, j * stride, j * stride + stride);
+      // A slot is a few words: a loop, not a copyWithin call per slot moved.
+      for (let k = 0, to = i * stride, from = j * stride; k < stride; k++)
+        words[to + k] = words[from + k] as number;
       if (values !== null && steps !== null) {
         values[i] = values[j] as number;
         steps[i] = steps[j] as number;
@@ -416,7 +326,6 @@ export class IdTable {
     this.width = w;
     this.stride = 2 + w / 4;
     this.words = new Uint32Array(cap * this.stride);
-    this.bytes = new Uint8Array(this.words.buffer);
     this.values = values === null ? null : new Float64Array(cap);
     this.steps = steps === null ? null : new Uint32Array(cap);
     const keyWords = stride - 2;

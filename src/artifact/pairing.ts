@@ -6,7 +6,8 @@ import type { MetricKind } from '../model/run.js';
 import { RunningStats } from '../stats/index.js';
 import { IdBatch, MEET_BASE, MEET_CAND } from './id-batch.js';
 import type { IdTable } from './id-tables.js';
-import { BASE, CAND, INLINE_ID_BYTES, IdOrder, idSteps, sameIds } from './id-tables.js';
+import { IdOrder, idSteps, sameIds } from './id-compare.js';
+import { BASE, CAND, INLINE_ID_BYTES } from './id-tables.js';
 import { NEED, ROW, type PredictionLines } from './prediction-lines.js';
 
 /** `run()` results. */
@@ -215,9 +216,12 @@ export class Pairing {
    * hash for them).
    */
   private now(kind: number, lines: PredictionLines, step: number): void {
-    this.table.incoming = lines.value;
-    this.table.incomingStep = step;
-    this.apply(kind, lines.key, lines.keyStart, lines.keyLen, 0, step);
+    const table = this.table;
+    table.incoming = lines.value;
+    table.incomingStep = step;
+    const base = kind === MEET_BASE;
+    if (table.meetLong(base ? BASE : CAND, lines.key, lines.keyStart, lines.keyLen))
+      this.paired(base, step);
   }
 
   /** Applies the batch and hands on the pairs of the window's steps, in order. */
@@ -262,12 +266,15 @@ export class Pairing {
     // A small table grows once for the whole batch (not by doubling through it).
     if (table.slots < 2 * batch.size) table.reserve(table.size + batch.size);
     batch.sort(table, this.tuning.regionBits, !this.proportion);
-    const keys = batch.keys;
+    const keys = batch.keyWords;
     for (let r = 0; r < batch.size; r++) {
       table.incoming = this.proportion ? batch.bit(r) : batch.value(r);
       const step = batch.step(r);
       table.incomingStep = step;
-      this.apply(batch.kind(r), keys, batch.keyStart(r), batch.len(r), batch.hash(r), step);
+      const base = batch.kind(r) === MEET_BASE;
+      const side = base ? BASE : CAND;
+      if (table.meet(side, keys, batch.keyWord(r), batch.len(r), batch.hash(r)))
+        this.paired(base, step);
     }
     batch.clear();
   }
@@ -279,18 +286,10 @@ export class Pairing {
   }
 
   /** One table operation; a pair it makes goes to the counts or the ring. */
-  private apply(
-    kind: number,
-    key: Uint8Array,
-    start: number,
-    len: number,
-    hash: number,
-    step: number,
-  ): void {
+  /** A pair the table made, of the row read at `step` (from the baseline if `base`): counts it. */
+  private paired(base: boolean, step: number): void {
     const table = this.table;
     {
-      const base = kind === MEET_BASE;
-      if (!table.meet(base ? BASE : CAND, key, start, len, hash)) return;
       this.rows++;
       const x = base ? table.incoming : table.partner;
       const y = base ? table.partner : table.incoming;

@@ -19,7 +19,8 @@ import type { Readable } from 'node:stream';
 import type { MetricKind } from '../model/run.js';
 import { InputError, quote, type Issue } from '../model/errors.js';
 import type { PairedPredictions } from '../model/review.js';
-import { BASE, CAND, HashSet64, IdOrder, IdTable, hashId, hashed } from './id-tables.js';
+import { IdOrder } from './id-compare.js';
+import { BASE, CAND, HashSet64, IdTable, hashId, hashed } from './id-tables.js';
 import { DONE, NEED_A, Pairing, TUNING, type PairingTuning } from './pairing.js';
 import {
   NEED,

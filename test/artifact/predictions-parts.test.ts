@@ -9,13 +9,12 @@ import {
   BASE,
   CAND,
   HashSet64,
-  IdOrder,
-  sameIds,
   INLINE_ID_BYTES,
   IdTable,
   hashId,
   hashed,
 } from '../../src/artifact/id-tables.js';
+import { IdOrder, sameIds } from '../../src/artifact/id-compare.js';
 import { Readable } from 'node:stream';
 import { IdBatch, MEET_BASE } from '../../src/artifact/id-batch.js';
 import { NEED, PredictionLines, ROW, streamReader } from '../../src/artifact/prediction-lines.js';
@@ -76,7 +75,15 @@ describe('IdTable', () => {
             hashId(key, 2, key.length - 2);
             table.incoming = value;
             table.incomingStep = step;
-            const met = table.meet(side, key, 2, key.length - 2, hashed.a);
+            const len = key.length - 2;
+            // Inline ids as IdBatch holds them: whole words from word 1, zero after the last byte.
+            const words = new Uint32Array(2 + Math.ceil(len / 4)).fill(0xdeadbeef);
+            words.fill(0, 1 + Math.floor((len - 1) / 4));
+            key.copy(Buffer.from(words.buffer), 4, 2);
+            const met =
+              len > INLINE_ID_BYTES
+                ? table.meetLong(side, key, 2, len)
+                : table.meet(side, words, 1, len, hashed.a);
             const partner = other.get(id);
             if (partner !== undefined) {
               other.delete(id);
