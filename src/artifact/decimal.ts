@@ -13,7 +13,8 @@
  *   point (a near-tie) is left to `Number()`.
  */
 
-const POW10 = Array.from({ length: 23 }, (_, i) => Number(`1e${i}`));
+/** 10^0 … 10^22, each exact in a double. */
+export const POW10: readonly number[] = Array.from({ length: 23 }, (_, i) => Number(`1e${i}`));
 const TWO53 = 2 ** 53;
 const SPLIT = 134217729; // 2^27 + 1 (Veltkamp)
 /** Veltkamp halves of the powers of ten: 10^i = POW10_HI[i] + POW10_LO[i], 26 bits each. */

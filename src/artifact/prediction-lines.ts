@@ -20,7 +20,7 @@ import type { MetricKind } from '../model/run.js';
 import { InputError, quote } from '../model/errors.js';
 import { MAX_MAGNITUDE } from '../model/limits.js';
 import { parseDecimal } from '../model/settings.js';
-import { decodeDecimal, io } from './decimal.js';
+import { POW10, decodeDecimal, io } from './decimal.js';
 import type { ByteReader } from './byte-readers.js';
 
 export { lazyReader, streamReader, type ByteReader } from './byte-readers.js';
@@ -297,13 +297,17 @@ export class PredictionLines {
     }
     if (c !== 10) return -1;
     let value: number;
-    io[0] = hi;
-    io[1] = lo;
-    if (decodeDecimal(loDigits, scale)) {
-      value = io[2] as number;
+    if (loDigits === 0 && scale >= -22 && scale <= 22) {
+      // Clinger's fast path (decimal.ts) inline: most losses have at most 16 digits.
+      value = scale < 0 ? hi / (POW10[-scale] as number) : hi * (POW10[scale] as number);
       if (negative) value = -value;
     } else {
-      value = Number(buf.toString('latin1', from, p));
+      io[0] = hi;
+      io[1] = lo;
+      if (decodeDecimal(loDigits, scale)) {
+        value = io[2] as number;
+        if (negative) value = -value;
+      } else value = Number(buf.toString('latin1', from, p));
     }
     if (!(Math.abs(value) <= MAX_MAGNITUDE)) return -1;
     this.value = value;
