@@ -8,7 +8,7 @@
  */
 import type { EpochLogMapping } from '../model/config.js';
 import type { CurvePoint } from '../model/run.js';
-import { MAX_CURVE_POINTS, MAX_MAGNITUDE } from '../model/limits.js';
+import { MAX_EPOCH_POINTS, MAX_MAGNITUDE } from '../model/limits.js';
 import { buildCurve, readCsvLog } from './curve-logs/index.js';
 
 const namedBy = (role: string) => `epoch-log ${role} in the config`;
@@ -23,7 +23,7 @@ export function parseEpochLog(text: string, file: string, mapping: EpochLogMappi
     namedBy,
     blank: 'refuse',
     maxMagnitude: MAX_MAGNITUDE,
-    maxRows: MAX_CURVE_POINTS,
+    maxRows: MAX_EPOCH_POINTS,
   });
   const curve = buildCurve(
     read,

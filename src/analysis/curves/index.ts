@@ -62,17 +62,15 @@ export function analyzeCurves(curves: Curves | undefined, context: CurvesContext
   return report;
 }
 
+/** The points a chart shows: LTTB on the validation errors, keeping `keep`. */
 function chart(
   points: readonly CurvePoint[],
   scale: ErrorScale,
   keep: number[],
+  errors: Float64Array = validationErrors(points, scale),
 ): EpochsEvidence['chart'] {
-  const errors = new Float64Array(points.length);
   const xs = new Float64Array(points.length);
-  points.forEach((p, i) => {
-    errors[i] = scale.toError(p.validation);
-    xs[i] = p.x;
-  });
+  for (let i = 0; i < points.length; i++) xs[i] = (points[i] as CurvePoint).x;
   const picked = downsampleKeeping(xs, errors, Math.min(CHART_POINTS, points.length), keep);
   return picked.map((i) => {
     const p = points[i] as CurvePoint;
@@ -82,16 +80,33 @@ function chart(
   });
 }
 
+function validationErrors(points: readonly CurvePoint[], scale: ErrorScale): Float64Array {
+  const errors = new Float64Array(points.length);
+  for (let i = 0; i < points.length; i++)
+    errors[i] = scale.toError((points[i] as CurvePoint).validation);
+  return errors;
+}
+
+/** Train errors of every point, or null when a point has no train value. */
+function trainErrors(points: readonly CurvePoint[], scale: ErrorScale): Float64Array | null {
+  const errors = new Float64Array(points.length);
+  for (let i = 0; i < points.length; i++) {
+    const train = (points[i] as CurvePoint).train;
+    if (train === undefined) return null;
+    errors[i] = scale.toError(train);
+  }
+  return errors;
+}
+
+/** Epoch curves may be long (a loss logged per step): typed arrays, one pass each, no copies. */
 function analyzeEpochs(
   points: readonly CurvePoint[],
   scale: ErrorScale,
 ): EpochsEvidence | CurveSkipped {
   if (points.length < MIN_EPOCH_POINTS)
     return { skipped: 'too-few-points', points: points.length, needs: MIN_EPOCH_POINTS };
-  const validation = points.map((p) => scale.toError(p.validation));
-  const hasTrain = points.every((p) => p.train !== undefined);
-  const train = hasTrain ? points.map((p) => scale.toError(p.train as number)) : null;
-  const verdict = epochVerdict(validation, train);
+  const validation = validationErrors(points, scale);
+  const verdict = epochVerdict(validation, trainErrors(points, scale));
   const best = points[verdict.bestIndex] as CurvePoint;
   const final = points[points.length - 1] as CurvePoint;
   return {
@@ -109,7 +124,7 @@ function analyzeEpochs(
         t === null ? null : (points[t] as CurvePoint).x,
       ]),
     ),
-    chart: chart(points, scale, [verdict.bestIndex]),
+    chart: chart(points, scale, [verdict.bestIndex], validation),
   };
 }
 

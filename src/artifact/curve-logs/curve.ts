@@ -11,7 +11,8 @@
  * the units they were logged in: nothing is looked up, converted or warned about units.
  * The result meets the artifact's rules: finite numbers, x strictly increasing, at least one point.
  */
-import { InputError } from '../../model/errors.js';
+import { InputError, type Issue } from '../../model/errors.js';
+import { formatLimit } from '../../model/limits.js';
 import type { CurvePoint } from '../../model/run.js';
 import { pickSeries, type Catalogue, type PickOptions } from './picker.js';
 import {
@@ -21,10 +22,34 @@ import {
   type Series,
   type SeriesPoint,
 } from './types.js';
+import { notFinite } from './text.js';
 import { convert, unitsFor } from './units.js';
 
 export interface CurveOptions extends PickOptions {
   duplicates?: 'average' | 'reject';
+  /** x and values beyond ± this are refused, with their place in the file. Default: no bound. */
+  maxMagnitude?: number;
+  /** Points the curve may have (one per x with a validation value). Default: no limit. */
+  maxPoints?: number;
+}
+
+/**
+ * Points of a picked series whose x or value lies beyond ±bound (at most 10), as problems of their
+ * place in the file: the readers of binary and JSON logs take any finite number, and the artifact
+ * that the curve goes into refuses such numbers (MAX_MAGNITUDE).
+ */
+function beyond(series: Series, bound: number): Issue[] {
+  const issues: Issue[] = [];
+  for (const p of series.points) {
+    if (issues.length >= 10) break;
+    const x = Math.abs(p.x) > bound;
+    if (!x && !(Math.abs(p.value) > bound)) continue;
+    const what = x ? `x ("${series.x}") of "${series.name}"` : `"${series.name}"`;
+    issues.push(
+      notFinite(series.file, pointerOf(series.where, p.at), what, String(x ? p.x : p.value), bound),
+    );
+  }
+  return issues;
 }
 
 export interface ImportedCurve {
@@ -117,8 +142,24 @@ export function buildCurve(
     ...validation.problems,
     ...(train === undefined || train === validation ? [] : train.problems),
   ];
+  if (options.maxMagnitude !== undefined) {
+    problems.push(...beyond(validation, options.maxMagnitude));
+    if (train !== undefined && train !== validation)
+      problems.push(...beyond(train, options.maxMagnitude));
+  }
   if (problems.length > 0) throw new InputError(problems);
   const validationByX = collapse(validation, mode, warnings);
+  if (options.maxPoints !== undefined && validationByX.size > options.maxPoints) {
+    throw new InputError([
+      {
+        file: validation.file,
+        pointer: '',
+        expected: `must give a curve of at most ${options.maxPoints} points (one per x with a value of "${validation.name}")`,
+        got: `${validationByX.size} points`,
+        hint: 'Log less often, or keep every n-th row or step before importing.',
+      },
+    ]);
+  }
   const trainByX = train === undefined ? undefined : collapse(train, mode, warnings);
   if (validationByX.size === 0) {
     throw new InputError([
@@ -139,6 +180,22 @@ export function buildCurve(
     else if (trainByX !== undefined) missing++;
     return point;
   });
+  const bound = options.maxMagnitude;
+  const over =
+    bound === undefined || conversion === undefined
+      ? undefined
+      : points.find((p) => Math.abs(p.validation) > bound || Math.abs(p.train ?? 0) > bound);
+  if (over !== undefined && bound !== undefined) {
+    throw new InputError([
+      {
+        file: validation.file,
+        pointer: '',
+        expected: `must stay within ±${formatLimit(bound)} in the metric's units (${conversion ?? ''})`,
+        got: `a value beyond it at x = ${over.x}`,
+        hint: 'Rescale the values, or import the series without --metric.',
+      },
+    ]);
+  }
   if (train !== undefined && trainByX !== undefined) {
     if (missing > 0) warnings.push({ code: 'train-missing', series: train.name, points: missing });
     let dropped = 0;

@@ -246,3 +246,30 @@ describe('readCsvLog', () => {
     );
   });
 });
+
+describe('buildCurve bounds', () => {
+  const log = 'epoch,loss,val_loss\n1,0.5,0.6\n2,0.4,0.5\n3,0.3,0.45\n3,0.3,0.44\n4,0.2,0.4\n';
+
+  it('keeps at most maxPoints points (one per x with a validation value), else names the file', () => {
+    const read = readCsvLog(log, 'log.csv');
+    // Five rows, x = 3 twice: four points.
+    expect(buildCurve(read, catalogue, { maxPoints: 4 }).points).toHaveLength(4);
+    expect(() => buildCurve(read, catalogue, { maxPoints: 3 })).toThrow(
+      'log.csv must give a curve of at most 3 points (one per x with a value of "val_loss") (got 4 points). Log less often',
+    );
+  });
+
+  it('refuses x or a value beyond maxMagnitude, by its place in the file', () => {
+    const read = readCsvLog('step,loss,val_loss\n1,0.5,0.6\n2e16,0.4,0.5\n', 'log.csv', {
+      x: 'step',
+    });
+    expect(() => buildCurve(read, catalogue, { maxMagnitude: 1e15 })).toThrow(
+      'log.csv: line 3 x ("step") of "val_loss" must be a decimal number within ±1e15 (got "20000000000000000")',
+    );
+    expect(buildCurve(read, catalogue).points).toHaveLength(2);
+    const value = readCsvLog('epoch,loss,val_loss\n1,5e15,0.6\n', 'log.csv');
+    expect(() => buildCurve(value, catalogue, { maxMagnitude: 1e15 })).toThrow(
+      'log.csv: line 2 "loss" must be a decimal number within ±1e15 (got "5000000000000000")',
+    );
+  });
+});
