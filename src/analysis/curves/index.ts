@@ -48,7 +48,9 @@ export function analyzeCurves(curves: Curves | undefined, context: CurvesContext
   if (!curves) return report;
   const range = { min: Infinity, max: -Infinity };
   for (const curve of [curves.epochs, curves.training_examples, curves.regularization]) {
-    for (const p of curve ?? []) {
+    if (curve === undefined) continue;
+    for (let i = 0; i < curve.length; i++) {
+      const p = curve[i] as CurvePoint;
       range.min = Math.min(range.min, p.validation, p.train ?? Infinity);
       range.max = Math.max(range.max, p.validation, p.train ?? -Infinity);
     }
@@ -67,11 +69,10 @@ function chart(
   points: readonly CurvePoint[],
   scale: ErrorScale,
   keep: number[],
-  errors: Float64Array = validationErrors(points, scale),
+  columns: Columns = columnsOf(points, scale),
 ): EpochsEvidence['chart'] {
-  const xs = new Float64Array(points.length);
-  for (let i = 0; i < points.length; i++) xs[i] = (points[i] as CurvePoint).x;
-  const picked = downsampleKeeping(xs, errors, Math.min(CHART_POINTS, points.length), keep);
+  const { xs, validation } = columns;
+  const picked = downsampleKeeping(xs, validation, Math.min(CHART_POINTS, points.length), keep);
   return picked.map((i) => {
     const p = points[i] as CurvePoint;
     return p.train === undefined
@@ -80,33 +81,39 @@ function chart(
   });
 }
 
-function validationErrors(points: readonly CurvePoint[], scale: ErrorScale): Float64Array {
-  const errors = new Float64Array(points.length);
-  for (let i = 0; i < points.length; i++)
-    errors[i] = scale.toError((points[i] as CurvePoint).validation);
-  return errors;
+/** A curve as columns: x, validation errors, and train errors (null when a point has none). */
+interface Columns {
+  xs: Float64Array;
+  validation: Float64Array;
+  train: Float64Array | null;
 }
 
-/** Train errors of every point, or null when a point has no train value. */
-function trainErrors(points: readonly CurvePoint[], scale: ErrorScale): Float64Array | null {
-  const errors = new Float64Array(points.length);
-  for (let i = 0; i < points.length; i++) {
-    const train = (points[i] as CurvePoint).train;
-    if (train === undefined) return null;
-    errors[i] = scale.toError(train);
+/** The columns of a curve in one pass over its points. */
+function columnsOf(points: readonly CurvePoint[], scale: ErrorScale): Columns {
+  const n = points.length;
+  const xs = new Float64Array(n);
+  const validation = new Float64Array(n);
+  let train: Float64Array | null = new Float64Array(n);
+  for (let i = 0; i < n; i++) {
+    const p = points[i] as CurvePoint;
+    xs[i] = p.x;
+    validation[i] = scale.toError(p.validation);
+    if (train === null) continue;
+    if (p.train === undefined) train = null;
+    else train[i] = scale.toError(p.train);
   }
-  return errors;
+  return { xs, validation, train };
 }
 
-/** Epoch curves may be long (a loss logged per step): typed arrays, one pass each, no copies. */
+/** Epoch curves may be long (a loss logged per step): columns read once, then one pass each. */
 function analyzeEpochs(
   points: readonly CurvePoint[],
   scale: ErrorScale,
 ): EpochsEvidence | CurveSkipped {
   if (points.length < MIN_EPOCH_POINTS)
     return { skipped: 'too-few-points', points: points.length, needs: MIN_EPOCH_POINTS };
-  const validation = validationErrors(points, scale);
-  const verdict = epochVerdict(validation, trainErrors(points, scale));
+  const columns = columnsOf(points, scale);
+  const verdict = epochVerdict(columns.validation, columns.train);
   const best = points[verdict.bestIndex] as CurvePoint;
   const final = points[points.length - 1] as CurvePoint;
   return {
@@ -124,7 +131,7 @@ function analyzeEpochs(
         t === null ? null : (points[t] as CurvePoint).x,
       ]),
     ),
-    chart: chart(points, scale, [verdict.bestIndex], validation),
+    chart: chart(points, scale, [verdict.bestIndex], columns),
   };
 }
 
