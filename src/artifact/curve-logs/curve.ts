@@ -67,15 +67,37 @@ export interface ImportedCurve {
   warnings: CurveLogWarning[];
 }
 
+/** A series with one value per x, in ascending x. */
+interface Collapsed {
+  xs: number[];
+  values: number[];
+}
+
 function collapse(
   series: Series,
   mode: 'average' | 'reject',
   warnings: CurveLogWarning[],
-): Map<number, number> {
+): Collapsed {
+  // The usual log: x strictly increasing. Then there is nothing to merge or sort, and a log of a
+  // million steps costs no map.
+  const points = series.points;
+  let increasing = true;
+  for (let i = 1; i < points.length && increasing; i++)
+    increasing = (points[i] as SeriesPoint).x > (points[i - 1] as SeriesPoint).x;
+  if (increasing) {
+    const xs = new Array<number>(points.length);
+    const values = new Array<number>(points.length);
+    for (let i = 0; i < points.length; i++) {
+      const x = (points[i] as SeriesPoint).x;
+      xs[i] = x === 0 ? 0 : x; // −0 is 0, as a map key would make it
+      values[i] = (points[i] as SeriesPoint).value;
+    }
+    return { xs, values };
+  }
   // Running means: no overflow for values near the largest double.
   const means = new Map<number, { mean: number; n: number }>();
   let previous: SeriesPoint | undefined;
-  for (const p of series.points) {
+  for (const p of points) {
     if (mode === 'reject' && previous !== undefined && !(p.x > previous.x)) {
       const x = series.where.kind === 'line' ? `column "${series.x}"` : `"${series.x}"`;
       throw new InputError([
@@ -100,13 +122,10 @@ function collapse(
     }
   }
   let merged = 0;
-  const out = new Map<number, number>();
-  for (const [x, { mean, n }] of means) {
-    if (n > 1) merged++;
-    out.set(x, mean);
-  }
+  for (const { n } of means.values()) if (n > 1) merged++;
   if (merged > 0) warnings.push({ code: 'duplicates-averaged', series: series.name, xs: merged });
-  return out;
+  const xs = [...means.keys()].sort((a, b) => a - b);
+  return { xs, values: xs.map((x) => (means.get(x) as { mean: number }).mean) };
 }
 
 export function buildCurve(
@@ -149,19 +168,20 @@ export function buildCurve(
   }
   if (problems.length > 0) throw new InputError(problems);
   const validationByX = collapse(validation, mode, warnings);
-  if (options.maxPoints !== undefined && validationByX.size > options.maxPoints) {
+  const size = validationByX.xs.length;
+  if (options.maxPoints !== undefined && size > options.maxPoints) {
     throw new InputError([
       {
         file: validation.file,
         pointer: '',
         expected: `must give a curve of at most ${options.maxPoints} points (one per x with a value of "${validation.name}")`,
-        got: `${validationByX.size} points`,
+        got: `${size} points`,
         hint: 'Log less often, or keep every n-th row or step before importing.',
       },
     ]);
   }
   const trainByX = train === undefined ? undefined : collapse(train, mode, warnings);
-  if (validationByX.size === 0) {
+  if (size === 0) {
     throw new InputError([
       {
         file: validation.file,
@@ -171,15 +191,27 @@ export function buildCurve(
       },
     ]);
   }
-  const xs = [...validationByX.keys()].sort((a, b) => a - b);
+  // Both series are in ascending x: merge them in one walk. A train value at an x without a
+  // validation value is dropped (counted); a validation x without a train value has none.
   let missing = 0;
-  const points: CurvePoint[] = xs.map((x) => {
-    const point: CurvePoint = { x, validation: toMetric(validationByX.get(x) as number) };
-    const t = trainByX?.get(x);
-    if (t !== undefined) point.train = toMetric(t);
-    else if (trainByX !== undefined) missing++;
-    return point;
-  });
+  let dropped = 0;
+  let t = 0;
+  const points = new Array<CurvePoint>(size);
+  for (let i = 0; i < size; i++) {
+    const x = validationByX.xs[i] as number;
+    const point: CurvePoint = { x, validation: toMetric(validationByX.values[i] as number) };
+    if (trainByX !== undefined) {
+      while (t < trainByX.xs.length && (trainByX.xs[t] as number) < x) {
+        t++;
+        dropped++;
+      }
+      if (t < trainByX.xs.length && trainByX.xs[t] === x)
+        point.train = toMetric(trainByX.values[t++] as number);
+      else missing++;
+    }
+    points[i] = point;
+  }
+  if (trainByX !== undefined) dropped += trainByX.xs.length - t;
   const bound = options.maxMagnitude;
   const over =
     bound === undefined || conversion === undefined
@@ -198,8 +230,6 @@ export function buildCurve(
   }
   if (train !== undefined && trainByX !== undefined) {
     if (missing > 0) warnings.push({ code: 'train-missing', series: train.name, points: missing });
-    let dropped = 0;
-    for (const x of trainByX.keys()) if (!validationByX.has(x)) dropped++;
     if (dropped > 0)
       warnings.push({ code: 'train-only-dropped', series: train.name, points: dropped });
   }

@@ -273,3 +273,75 @@ describe('buildCurve bounds', () => {
     );
   });
 });
+
+describe('buildCurve merges series as a map by x would', () => {
+  /**
+   * Naive reference: every series collapsed through a Map of running means by x, the validation
+   * x sorted, train values looked up by x (the straightforward merge; common practice).
+   */
+  function naive(read: ReturnType<typeof readCsvLog>) {
+    const byX = (name: string) => {
+      const means = new Map<number, { mean: number; n: number }>();
+      for (const p of read.series.find((s) => s.name === name)?.points ?? []) {
+        const e = means.get(p.x);
+        if (e === undefined) means.set(p.x, { mean: p.value, n: 1 });
+        else {
+          e.n++;
+          e.mean += p.value / e.n - e.mean / e.n;
+        }
+      }
+      return means;
+    };
+    const v = byX('val_loss');
+    const t = byX('loss');
+    const points = [...v.keys()]
+      .sort((a, b) => a - b)
+      .map((x) => {
+        const train = t.get(x)?.mean;
+        const validation = (v.get(x) as { mean: number }).mean;
+        return train === undefined ? { x, validation } : { x, train, validation };
+      });
+    const merged = (m: Map<number, { n: number }>) => [...m.values()].filter((e) => e.n > 1).length;
+    return {
+      points,
+      averaged: [merged(v), merged(t)],
+      missing: [...v.keys()].filter((x) => !t.has(x)).length,
+      dropped: [...t.keys()].filter((x) => !v.has(x)).length,
+    };
+  }
+
+  it('property: same points and the same counts in the warnings, sorted or not, with repeats', () => {
+    // Source: the naive map-based merge above.
+    const row = fc.tuple(
+      fc.integer({ min: -3, max: 12 }),
+      fc.option(fc.double({ min: -5, max: 5, noNaN: true }), { nil: undefined }),
+      fc.option(fc.double({ min: -5, max: 5, noNaN: true }), { nil: undefined }),
+    );
+    fc.assert(
+      fc.property(fc.array(row, { minLength: 1, maxLength: 30 }), fc.boolean(), (rows, sorted) => {
+        const ordered = sorted ? [...rows].sort((a, b) => a[0] - b[0]) : rows;
+        const text = `epoch,loss,val_loss\n${ordered
+          .map(([x, t, v]) => `${x},${t ?? ''},${v ?? ''}`)
+          .join('\n')}\n`;
+        const read = readCsvLog(text, 'log.csv');
+        const expected = naive(read);
+        if (expected.points.length === 0) return;
+        const curve = buildCurve(read, catalogue, { train: 'loss', validation: 'val_loss' });
+        expect(curve.points).toEqual(expected.points);
+        const count = (code: string, series: string) => {
+          const w = curve.warnings.find(
+            (w) => w.code === code && 'series' in w && w.series === series,
+          ) as { xs?: number; points?: number } | undefined;
+          return w === undefined ? 0 : (w.xs ?? w.points ?? 0);
+        };
+        expect([
+          count('duplicates-averaged', 'val_loss'),
+          count('duplicates-averaged', 'loss'),
+        ]).toEqual(expected.averaged);
+        expect(count('train-missing', 'loss')).toBe(expected.missing);
+        expect(count('train-only-dropped', 'loss')).toBe(expected.dropped);
+      }),
+      { numRuns: 1500, seed: 20261130 },
+    );
+  });
+});
