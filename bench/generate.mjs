@@ -129,11 +129,11 @@ function gaussian(next) {
 
 /**
  * A log loss logged once per training step, n steps (binary cross-entropy, so it starts near
- * ln 2 ≈ 0.69, a coin flip): the training loss falls as a power law with
- * mini-batch noise; the validation loss (the same model on the held-out split, its own smaller
- * noise) follows it down, reaches its minimum at about 45 % of the run, then climbs as the model
- * overfits (about 15 % above its minimum at the end), so early stopping has a point to find.
- * Values carry six significant digits, as a logger prints them.
+ * ln 2 ≈ 0.69, a coin flip): the training loss falls as a power law with mini-batch noise; the
+ * validation loss (the same model on the held-out split, with slowly wandering evaluation noise)
+ * follows it down and starts to rise at 45 % of the run as the model overfits. With the bench's
+ * seed its minimum is 0.165 at step 427,798 and it ends at 0.262, so early stopping has a point to
+ * find. Values carry six significant digits, as a logger prints them.
  */
 function epochCurve(n, seed) {
   const next = random(seed);
