@@ -14,8 +14,8 @@ import {
 import { join } from 'node:path';
 
 export const SEED = 20261130;
-/** Points of the benchmark's epoch curve: the most a curve may have (src/model/limits.ts). */
-export const CURVE_POINTS = 10_000;
+/** Points of the benchmark's epoch curve: the most an epoch curve may have (src/model/limits.ts). */
+export const CURVE_POINTS = 1_000_000;
 
 /** mulberry32: a small, well-known 32-bit PRNG; enough for benchmark data (common practice). */
 function random(seed) {
@@ -121,18 +121,37 @@ function rate(values) {
 }
 const round6 = (x) => Math.round(x * 1e6) / 1e6;
 
-/** An epoch curve of n points: falls, then validation turns up a little after the middle. */
+/** Standard normal deviate (Box–Muller) from a uniform generator (common practice). */
+function gaussian(next) {
+  const u = 1 - next(); // (0, 1]: log(u) stays finite
+  return Math.sqrt(-2 * Math.log(u)) * Math.cos(2 * Math.PI * next());
+}
+
+/**
+ * A log loss logged once per training step, n steps (binary cross-entropy, so it starts near
+ * ln 2 ≈ 0.69, a coin flip): the training loss falls as a power law with mini-batch noise; the
+ * validation loss (the same model on the held-out split, with slowly wandering evaluation noise)
+ * follows it down and starts to rise at 45 % of the run as the model overfits. With the bench's
+ * seed its minimum is 0.165 at step 427,798 and it ends at 0.262, so early stopping has a point to
+ * find. Values carry six significant digits, as a logger prints them.
+ */
 function epochCurve(n, seed) {
   const next = random(seed);
   const points = new Array(n);
+  const digits = (v) => Number(v.toPrecision(6));
+  let drift = 0;
   for (let i = 0; i < n; i++) {
-    const e = i + 1;
-    const fall = 0.4 * Math.exp(-e / (n / 8));
-    const noise = (next() - 0.5) * 0.002;
+    const t = (i + 1) / n;
+    const fall = 0.55 * (1 + 400 * t) ** -0.55;
+    const train = 0.14 + fall - 0.03 * t;
+    // Overfitting: a quadratic rise after 45 % of the run.
+    const over = t > 0.45 ? 0.06 * ((t - 0.45) / 0.55) ** 2 : 0;
+    // Slowly wandering evaluation noise (AR(1)) plus a little white noise.
+    drift = 0.999 * drift + 0.0004 * gaussian(next);
     points[i] = {
-      x: e,
-      train: 0.05 + fall + noise,
-      validation: 0.09 + fall + (e > n / 2 ? (0.03 * (e - n / 2)) / n : 0) + noise,
+      x: i + 1,
+      train: digits(train * (1 + 0.08 * gaussian(next))),
+      validation: digits(0.17 + fall + over + drift + 0.002 * gaussian(next)),
     };
   }
   return points;
@@ -142,6 +161,8 @@ export function generate(dir, sizes) {
   mkdirSync(dir, { recursive: true });
   writeJson(join(dir, 'tiny-baseline.json'), artifact('eta-baseline', 'proportion', null));
   writeJson(join(dir, 'tiny-candidate.json'), artifact('eta-dropout', 'proportion', null));
+  // The baseline of the curve workload: same metric (log loss), no curve.
+  writeJson(join(dir, 'tiny-baseline-loss.json'), artifact('eta-baseline', 'continuous', null));
   for (const size of sizes) {
     const n = size === '10m' ? 10_000_000 : 1_000_000;
     // Same seed, same outcomes: computed on every run for the artifacts' values, written once.
@@ -192,13 +213,18 @@ export function generate(dir, sizes) {
         join(dir, 'candidate-1m-loss.json'),
         artifact('eta-dropout', 'continuous', 'cand-1m-loss.csv', rate(o.candLoss)),
       );
-      // The longest curve an artifact may hold (MAX_CURVE_POINTS in src/model/limits.ts).
-      writeJson(
-        join(dir, 'candidate-curve-10k.json'),
-        artifact('eta-dropout', 'proportion', null, null, {
-          curves: { epochs: epochCurve(CURVE_POINTS, SEED + 2) },
-        }),
-      );
+      // The longest epoch curve an artifact may hold (MAX_EPOCH_POINTS in src/model/limits.ts);
+      // about 50 MB, so the bench reads it with --max-artifact-mb. Written once (it takes seconds).
+      const curve = join(dir, 'candidate-epochs-1m.json');
+      if (!existsSync(curve)) {
+        writeJson(
+          `${curve}.tmp`,
+          artifact('eta-dropout', 'continuous', null, null, {
+            curves: { epochs: epochCurve(CURVE_POINTS, SEED + 2) },
+          }),
+        );
+        renameSync(`${curve}.tmp`, curve);
+      }
     }
   }
 }

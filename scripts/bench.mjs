@@ -116,8 +116,13 @@ const workloads = {
   'fitgap start-up (CLI)': cli('tiny-baseline.json', 'tiny-candidate.json'),
   'fitgap start-up (action)': [node, join(ROOT, 'dist/index.js')],
   "node -e ''": [node, '-e', ''],
-  'fitgap curve 10k': cli('tiny-baseline.json', 'candidate-curve-10k.json'),
-  'floor curve 10k': [node, join(ROOT, 'bench/floor-json.mjs'), 'candidate-curve-10k.json'],
+  // The curve artifact is about 50 MB: over the 16 MiB default, so the documented flag raises it.
+  'fitgap curve 1M': [
+    ...cli('tiny-baseline-loss.json', 'candidate-epochs-1m.json'),
+    '--max-artifact-mb',
+    '128',
+  ],
+  'floor curve 1M': [node, join(ROOT, 'bench/floor-json.mjs'), 'candidate-epochs-1m.json'],
 };
 
 /** One run in its own process: wall ms (measured here), CPU ms and peak RSS MB (/usr/bin/time). */
@@ -156,7 +161,7 @@ const groups = [
     members: ['fitgap start-up (CLI)', 'fitgap start-up (action)', "node -e ''"],
     turns: 2 * TURNS + 1,
   },
-  { key: 'curve', members: ['fitgap curve 10k', 'floor curve 10k'], turns: TURNS },
+  { key: 'curve', members: ['fitgap curve 1M', 'floor curve 1M'], turns: TURNS },
   ...(quick
     ? []
     : [
@@ -366,16 +371,16 @@ for (const entry of wanted('startup') ? ['CLI', 'action'] : []) {
   );
 }
 if (wanted('curve')) {
-  // A curve holds at most 10,000 points (src/model/limits.ts): the target was set for 1M points,
-  // which are now refused at once; at 10,000 both sides are mostly Node's start-up.
-  const r = ratio('curve', 'fitgap curve 10k', 'floor curve 10k');
+  // An epoch curve of 1,000,000 points, the most one may have (MAX_EPOCH_POINTS in
+  // src/model/limits.ts), against reading and parsing the same file.
+  const r = ratio('curve', 'fitgap curve 1M', 'floor curve 1M');
   row(
-    'epoch curve of 10,000 points, the most allowed (validate, analyse, downsample) vs `JSON.parse` of the file',
-    cell('curve', 'fitgap curve 10k'),
-    `JSON.parse: ${cell('curve', 'floor curve 10k')}`,
+    'epoch curve of 1,000,000 points (validate, analyse, downsample) vs `JSON.parse` of the file',
+    cell('curve', 'fitgap curve 1M'),
+    `JSON.parse: ${cell('curve', 'floor curve 1M')}`,
     times(r),
-    times(ratio('curve', 'fitgap curve 10k', 'floor curve 10k', 'cpu')),
-    '≤ 1.5× (set for 1M points)',
+    times(ratio('curve', 'fitgap curve 1M', 'floor curve 1M', 'cpu')),
+    '≤ 1.5×',
     r <= 1.5,
   );
 }

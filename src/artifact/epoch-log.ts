@@ -8,22 +8,25 @@
  */
 import type { EpochLogMapping } from '../model/config.js';
 import type { CurvePoint } from '../model/run.js';
-import { MAX_CURVE_POINTS, MAX_MAGNITUDE } from '../model/limits.js';
-import { buildCurve, readCsvLog } from './curve-logs/index.js';
+import { MAX_EPOCH_POINTS, MAX_MAGNITUDE } from '../model/limits.js';
+import { PointBudget, buildCurve, readCsvLog } from './curve-logs/index.js';
 
 const namedBy = (role: string) => `epoch-log ${role} in the config`;
 
 export function parseEpochLog(text: string, file: string, mapping: EpochLogMapping): CurvePoint[] {
+  const columns = [
+    ...(mapping.train === undefined ? [] : [{ role: 'train', name: mapping.train }]),
+    { role: 'validation', name: mapping.validation },
+  ];
   const read = readCsvLog(text, file, {
     x: mapping.x,
-    columns: [
-      ...(mapping.train === undefined ? [] : [{ role: 'train', name: mapping.train }]),
-      { role: 'validation', name: mapping.validation },
-    ],
+    columns,
+    // Only the mapped columns are read, and maxRows bounds the rows: a value per column and row.
+    budget: new PointBudget(MAX_EPOCH_POINTS * columns.length),
     namedBy,
     blank: 'refuse',
     maxMagnitude: MAX_MAGNITUDE,
-    maxRows: MAX_CURVE_POINTS,
+    maxRows: MAX_EPOCH_POINTS,
   });
   const curve = buildCurve(
     read,

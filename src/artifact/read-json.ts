@@ -34,16 +34,6 @@ function errorOffset(text: string, message: string): number | null {
   return null;
 }
 
-interface Frame {
-  object: boolean;
-  /** Keys seen so far (objects). */
-  keys: Set<string>;
-  /** Key or index of the value being read, for pointers. */
-  at: string;
-  index: number;
-  expectKey: boolean;
-}
-
 interface Structure {
   /** Offset where nesting first went past the limit, or -1. */
   tooDeep: number;
@@ -52,6 +42,8 @@ interface Structure {
 
 const QUOTE = 34;
 const BACKSLASH = 92;
+/** Keys an object may have before its duplicate check moves from pairwise comparison to a Set. */
+const FEW_KEYS = 16;
 
 function decodeKey(raw: string): string | null {
   if (!raw.includes('\\')) return raw;
@@ -65,48 +57,136 @@ function decodeKey(raw: string): string | null {
 /**
  * One linear pass over the text: nesting depth and duplicate keys. Tolerates invalid JSON (it only
  * looks at brackets, commas and strings); JSON.parse judges the syntax.
+ *
+ * Nothing is allocated per container or per key (a curve of a million points is a million
+ * objects): the open containers live in typed arrays indexed by depth, and a key is kept as its
+ * offsets in the text, compared in place with the other keys of its object. A key is decoded (and
+ * a pointer written) only for an escaped key, an object of more than FEW_KEYS keys (checked with a
+ * Set from then on) or a duplicate.
  */
 export function scanStructure(text: string, maxDepth = MAX_JSON_DEPTH): Structure {
-  const stack: Frame[] = [];
   const duplicates: Structure['duplicates'] = [];
-  const pointer = () =>
-    stack
-      .slice(0, -1)
-      .map((f) => `/${f.object ? escapePointerToken(f.at) : String(f.index)}`)
-      .join('');
-  for (let i = 0; i < text.length; i++) {
+  const n = text.length;
+  // Per open container, by depth: object or array, the array index or the current key's offsets.
+  const object = new Uint8Array(maxDepth);
+  const expectKey = new Uint8Array(maxDepth);
+  const index = new Int32Array(maxDepth);
+  const keyAt = new Int32Array(maxDepth);
+  /** Where the keys of the object at each depth start in `keys`. */
+  const firstKey = new Int32Array(maxDepth);
+  const sets: (Set<string> | null)[] = new Array<Set<string> | null>(maxDepth).fill(null);
+  // Keys of the open objects, three numbers each: start and end offset of the raw text, escaped.
+  let keys = new Int32Array(3 * 256);
+  let keyTop = 0;
+  let depth = 0;
+  /** The next backslash at or after the current string (n when none): found once per backslash. */
+  let backslash = -1;
+
+  const raw = (k: number): string => text.slice(keys[k] as number, keys[k + 1] as number);
+  const decoded = (k: number): string => {
+    const r = raw(k);
+    return keys[k + 2] === 1 ? (decodeKey(r) ?? r) : r;
+  };
+  const same = (a: number, b: number): boolean => {
+    const start = keys[a] as number;
+    const other = keys[b] as number;
+    const length = (keys[a + 1] as number) - start;
+    if (length === (keys[b + 1] as number) - other) {
+      let c = 0;
+      while (c < length && text.charCodeAt(start + c) === text.charCodeAt(other + c)) c++;
+      if (c === length) return true;
+    }
+    // Escapes spell one key in several ways ("a" and "\u0061").
+    if (keys[a + 2] === 0 && keys[b + 2] === 0) return false;
+    const x = decodeKey(raw(a));
+    return x !== null && x === decodeKey(raw(b));
+  };
+  const pointer = (): string => {
+    let out = '';
+    for (let d = 0; d < depth - 1; d++) {
+      out += `/${object[d] === 1 ? escapePointerToken(decoded(keyAt[d] as number)) : String(index[d])}`;
+    }
+    return out;
+  };
+
+  for (let i = 0; i < n; i++) {
     const c = text.charCodeAt(i);
     if (c === QUOTE) {
       const start = i + 1;
-      i++;
-      while (i < text.length && text.charCodeAt(i) !== QUOTE) {
-        if (text.charCodeAt(i) === BACKSLASH) i++;
-        i++;
+      if (backslash < start) {
+        backslash = text.indexOf('\\', start);
+        if (backslash < 0) backslash = n;
       }
-      const top = stack[stack.length - 1];
-      if (top?.object === true && top.expectKey) {
-        const key = decodeKey(text.slice(start, i));
-        top.expectKey = false;
-        if (key !== null) {
-          top.at = key;
-          if (top.keys.has(key) && duplicates.length < 10) {
-            duplicates.push({ pointer: `${pointer()}/${escapePointerToken(key)}`, key });
-          }
-          top.keys.add(key);
+      let escaped = 0;
+      const close = text.indexOf('"', start);
+      if (close < 0) i = n;
+      else if (backslash > close) i = close;
+      else {
+        // A backslash inside the string: walk it character by character (escaped quotes).
+        escaped = 1;
+        i = start;
+        while (i < n && text.charCodeAt(i) !== QUOTE) {
+          if (text.charCodeAt(i) === BACKSLASH) i++;
+          i++;
+        }
+        backslash = i < n ? text.indexOf('\\', i) : n;
+        if (backslash < 0) backslash = n;
+      }
+      const top = depth - 1;
+      if (top >= 0 && object[top] === 1 && expectKey[top] === 1) {
+        expectKey[top] = 0;
+        if (escaped === 1 && decodeKey(text.slice(start, i)) === null) continue;
+        if (keyTop + 3 > keys.length) {
+          const grown = new Int32Array(keys.length * 2);
+          grown.set(keys);
+          keys = grown;
+        }
+        const k = keyTop;
+        keys[k] = start;
+        keys[k + 1] = i;
+        keys[k + 2] = escaped;
+        keyAt[top] = k;
+        let set = sets[top] ?? null;
+        const count = (k - (firstKey[top] as number)) / 3;
+        if (set === null && count >= FEW_KEYS) {
+          set = new Set<string>();
+          for (let j = firstKey[top] as number; j < k; j += 3) set.add(decoded(j));
+          sets[top] = set;
+        }
+        let repeated = false;
+        if (set !== null) {
+          const key = decoded(k);
+          repeated = set.has(key);
+          set.add(key);
+        } else {
+          for (let j = firstKey[top] as number; j < k && !repeated; j += 3) repeated = same(j, k);
+        }
+        keyTop = k + 3;
+        if (repeated && duplicates.length < 10) {
+          const key = decoded(k);
+          duplicates.push({ pointer: `${pointer()}/${escapePointerToken(key)}`, key });
         }
       }
       continue;
     }
     if (c === 123 /* { */ || c === 91 /* [ */) {
-      if (stack.length >= maxDepth) return { tooDeep: i, duplicates };
-      stack.push({ object: c === 123, keys: new Set(), at: '', index: 0, expectKey: c === 123 });
+      if (depth >= maxDepth) return { tooDeep: i, duplicates };
+      object[depth] = c === 123 ? 1 : 0;
+      expectKey[depth] = c === 123 ? 1 : 0;
+      index[depth] = 0;
+      firstKey[depth] = keyTop;
+      depth++;
     } else if (c === 125 /* } */ || c === 93 /* ] */) {
-      stack.pop();
+      if (depth > 0) {
+        depth--;
+        keyTop = firstKey[depth] as number;
+        sets[depth] = null;
+      }
     } else if (c === 44 /* , */) {
-      const top = stack[stack.length - 1];
-      if (top !== undefined) {
-        if (top.object) top.expectKey = true;
-        else top.index++;
+      const top = depth - 1;
+      if (top >= 0) {
+        if (object[top] === 1) expectKey[top] = 1;
+        else index[top] = (index[top] as number) + 1;
       }
     }
   }

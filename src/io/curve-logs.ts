@@ -28,6 +28,7 @@ import {
   type Series,
 } from '../artifact/curve-logs/index.js';
 import { DEFAULT_FILE_LIMITS, readChecked } from './open-untrusted.js';
+import { MAX_MAGNITUDE } from '../model/limits.js';
 
 export type PathKind = 'file' | 'dir' | 'other' | 'missing';
 
@@ -301,6 +302,8 @@ export async function readCurveLogs(
       results.push(
         readCsvLog(bytes, file.display, {
           budget,
+          // A cell beyond the artifact's bound is a problem of its column, named by its line.
+          maxMagnitude: MAX_MAGNITUDE,
           ...(options.x === undefined ? {} : { x: options.x }),
         }),
       );

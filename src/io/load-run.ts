@@ -101,10 +101,15 @@ export function predictionsSource(
   };
 }
 
-export async function loadRun(path: string, options: LoadRunOptions = {}): Promise<LoadedRun> {
-  const file = options.displayName ?? path;
-  const limits = options.limits ?? DEFAULT_FILE_LIMITS;
-  const folder = dirname(resolve(path));
+/**
+ * The artifact's text and the sha256 of its bytes. The bytes are not kept: a large artifact (a
+ * curve of a million points is about 50 MB) would otherwise be held twice while it is parsed.
+ */
+async function readArtifactText(
+  path: string,
+  file: string,
+  limits: FileLimits,
+): Promise<{ text: string; sha256: string; checked: { realPath: string; id: string } }> {
   const { bytes, file: checked } = await readChecked({
     path,
     file,
@@ -112,9 +117,16 @@ export async function loadRun(path: string, options: LoadRunOptions = {}): Promi
     limit: 'artifactBytes',
     limits,
   });
-  const read: ReadFile[] = [{ realPath: checked.realPath, id: checked.id }];
   const sha256 = createHash('sha256').update(bytes).digest('hex');
-  const text = decodeUtf8(bytes, file, 'a run artifact');
+  return { text: decodeUtf8(bytes, file, 'a run artifact'), sha256, checked };
+}
+
+export async function loadRun(path: string, options: LoadRunOptions = {}): Promise<LoadedRun> {
+  const file = options.displayName ?? path;
+  const limits = options.limits ?? DEFAULT_FILE_LIMITS;
+  const folder = dirname(resolve(path));
+  const { text, sha256, checked } = await readArtifactText(path, file, limits);
+  const read: ReadFile[] = [{ realPath: checked.realPath, id: checked.id }];
   const artifact = validateRun(parseJson(text, file), file);
   const notes: Note[] = [];
 

@@ -13,11 +13,30 @@
 export const MAX_MAGNITUDE = 1e15;
 
 /**
- * Most points in one curve. The curve analysis (power-law fit, early stopping) takes about three
- * seconds at 10,000 points on one core, and a chart shows at most about a hundred: log a curve at
- * most once per 1/10,000 of its range, or thin it before writing the artifact.
+ * Most points in an epoch curve (`curves.epochs`, an epoch log, `fitgap curves import`). A loss
+ * logged once per training step gives curves of a million points; their analysis is linear (the
+ * early-stopping criteria in one pass, the chart by LTTB to about a hundred points) and costs about
+ * half of reading and parsing the file. The limit bounds the work and the memory of one artifact
+ * (a million points are about 50 MB of JSON and 60 MB of parsed objects; such a file also needs
+ * a raised artifact byte limit, `--max-artifact-mb`). Log at most once per step, or thin longer
+ * curves before writing the artifact.
+ */
+export const MAX_EPOCH_POINTS = 1_000_000;
+
+/**
+ * Most points in a learning curve (`curves.training_examples`) or a regularization sweep
+ * (`curves.regularization`). The learning curve's analysis is far heavier per point than the epoch
+ * curve's: a power law fitted by Levenberg–Marquardt from several starting values, with intervals
+ * for its projections, over every point (about a second at 10,000 points, some hundred times the
+ * cost per point of an epoch curve). Both curves take one training run per point, so real ones have
+ * tens of points; 10,000 is generous and keeps a review within seconds.
  */
 export const MAX_CURVE_POINTS = 10_000;
+
+/** The point limit of a curve by its name. */
+export function maxCurvePoints(name: 'epochs' | 'training_examples' | 'regularization'): number {
+  return name === 'epochs' ? MAX_EPOCH_POINTS : MAX_CURVE_POINTS;
+}
 
 /**
  * Deepest nesting of arrays and objects in a JSON document. A run artifact nests five levels; free

@@ -156,7 +156,23 @@ export function outOfRangeNumbers(
         : (f.node as Record<string, unknown>)[f.keys[i] as string];
     if (typeof child === 'number') {
       if (bad(child)) found.push({ pointer: pointerOf(frames), value: child });
-    } else if (child !== null && typeof child === 'object') frames.push(frame(child));
+    } else if (child !== null && typeof child === 'object' && !fineLeaf(child, bad))
+      frames.push(frame(child));
   }
   return found;
+}
+
+/**
+ * An object that holds no container and only good numbers (a curve point) needs no frame: checked
+ * in place, without allocating. Anything else is walked with frames, which write the pointers.
+ */
+function fineLeaf(node: object, bad: (value: number) => boolean): boolean {
+  if (Array.isArray(node)) return false;
+  for (const key in node) {
+    const value: unknown = (node as Record<string, unknown>)[key];
+    if (typeof value === 'number') {
+      if (bad(value)) return false;
+    } else if (value !== null && typeof value === 'object') return false;
+  }
+  return true;
 }

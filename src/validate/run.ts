@@ -8,8 +8,8 @@ import validateRunSchema from './generated/run-schema.js';
 import { InputError, quote, type Issue } from '../model/errors.js';
 import { ajvIssues, outOfRangeNumbers } from './ajv-issues.js';
 import { guardrailIssues } from './guardrails.js';
-import { MAX_CURVE_POINTS, MAX_MAGNITUDE, formatLimit } from '../model/limits.js';
-import { CURVE_NAMES, SPLIT_NAMES, type RunArtifact } from '../model/run.js';
+import { MAX_MAGNITUDE, formatLimit, maxCurvePoints } from '../model/limits.js';
+import { CURVE_NAMES, SPLIT_NAMES, type CurvePoint, type RunArtifact } from '../model/run.js';
 
 function validator(): { (doc: unknown): doc is RunArtifact; errors?: ErrorObject[] | null } {
   return validateRunSchema as { (doc: unknown): doc is RunArtifact; errors?: ErrorObject[] | null };
@@ -52,24 +52,30 @@ export function semanticIssues(run: RunArtifact, file: string): Issue[] {
   for (const name of CURVE_NAMES) {
     const curve = run.curves?.[name];
     if (curve === undefined) continue;
-    if (curve.length > MAX_CURVE_POINTS) {
+    const most = maxCurvePoints(name);
+    if (curve.length > most) {
       issues.push({
         file,
         pointer: `/curves/${name}`,
-        expected: `must have at most ${MAX_CURVE_POINTS} points`,
+        expected: `must have at most ${most} points`,
         got: `${curve.length} points`,
         hint: 'Log the curve less often, or keep every n-th point before writing the artifact.',
       });
       continue;
     }
-    curve.forEach((point, i) => {
-      const at = `/curves/${name}/${i}`;
-      inUnit(point.validation, `${at}/validation`);
-      if (point.train !== undefined) inUnit(point.train, `${at}/train`);
+    // A plain loop, and a pointer written only for a point with a problem: a curve may hold a
+    // million points.
+    const pointer = (i: number): string => `/curves/${name}/${i}`;
+    for (let i = 0; i < curve.length; i++) {
+      const point = curve[i] as CurvePoint;
+      if (proportion && (point.validation < 0 || point.validation > 1))
+        inUnit(point.validation, `${pointer(i)}/validation`);
+      if (proportion && point.train !== undefined && (point.train < 0 || point.train > 1))
+        inUnit(point.train, `${pointer(i)}/train`);
       if (name === 'regularization' && point.x <= 0) {
         issues.push({
           file,
-          pointer: `${at}/x`,
+          pointer: `${pointer(i)}/x`,
           expected: 'must be > 0 (the regularization curve is read on a log axis)',
           got: quote(point.x),
           hint: 'Leave out the unregularized point or give it a tiny positive strength.',
@@ -78,7 +84,7 @@ export function semanticIssues(run: RunArtifact, file: string): Issue[] {
       if (name === 'training_examples' && point.x <= 0) {
         issues.push({
           file,
-          pointer: `${at}/x`,
+          pointer: `${pointer(i)}/x`,
           expected: 'must be > 0 (a count of training examples)',
           got: quote(point.x),
         });
@@ -87,13 +93,13 @@ export function semanticIssues(run: RunArtifact, file: string): Issue[] {
       if (previous !== undefined && !(point.x > previous.x)) {
         issues.push({
           file,
-          pointer: `${at}/x`,
+          pointer: `${pointer(i)}/x`,
           expected: `must be greater than the previous point's x (${previous.x}); curve x must strictly increase`,
           got: quote(point.x),
           hint: 'Sort the points by x and drop duplicates.',
         });
       }
-    });
+    }
   }
 
   run.slices?.forEach((slice, i) => {

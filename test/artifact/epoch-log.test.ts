@@ -9,7 +9,7 @@ import { describe, expect, it } from 'vitest';
 import { parseEpochLog } from '../../src/artifact/epoch-log.js';
 import type { EpochLogMapping } from '../../src/model/config.js';
 import { InputError } from '../../src/model/errors.js';
-import { MAX_CURVE_POINTS, MAX_MAGNITUDE } from '../../src/model/limits.js';
+import { MAX_EPOCH_POINTS, MAX_MAGNITUDE } from '../../src/model/limits.js';
 
 const MAPPING: EpochLogMapping = {
   file: 'epochs.csv',
@@ -117,13 +117,13 @@ describe('parseEpochLog', () => {
     );
   });
 
-  it(`refuses more than ${MAX_CURVE_POINTS} data rows at the first row over`, () => {
+  it(`refuses more than ${MAX_EPOCH_POINTS} data rows at the first row over`, () => {
     const rows = (n: number) =>
       `epoch,val_loss\n${Array.from({ length: n }, (_, i) => `${i + 1},0.5\n`).join('')}`;
     const mapping = { file: 'e.csv', x: 'epoch', validation: 'val_loss' };
-    expect(read(rows(MAX_CURVE_POINTS), mapping)).toHaveLength(MAX_CURVE_POINTS);
-    expect(() => read(rows(MAX_CURVE_POINTS + 1), mapping)).toThrow(
-      `runs/epochs.csv: line ${MAX_CURVE_POINTS + 2} must have at most ${MAX_CURVE_POINTS} data rows`,
+    expect(read(rows(MAX_EPOCH_POINTS), mapping)).toHaveLength(MAX_EPOCH_POINTS);
+    expect(() => read(rows(MAX_EPOCH_POINTS + 1), mapping)).toThrow(
+      `runs/epochs.csv: line ${MAX_EPOCH_POINTS + 2} must have at most ${MAX_EPOCH_POINTS} data rows`,
     );
   });
 

@@ -183,7 +183,40 @@ Run 'fitgap curves import --help' for its options.
       await runCli(['curves', 'import', '--from', 'csv-log', 'log.csv', '--out', 'c.json'], io),
     ).toBe(2);
     expect(stderr()).toBe(
-      'log.csv: line 3 column "val_loss" must be a finite number (got "nan"). The run logged NaN or infinity here (it may have diverged); cut the log before this point or pick another series.\n',
+      'log.csv: line 3 column "val_loss" must be a decimal number within ±1e15 (got "nan"). The run logged NaN or infinity here (it may have diverged); cut the log before this point or pick another series.\n',
+    );
+    expect(files.size).toBe(0);
+  });
+
+  // The bound of a run artifact's numbers (MAX_MAGNITUDE), applied while importing rather than
+  // when `fitgap validate` reads the written curve.
+  it('refuses a CSV value beyond ±1e15 at its line, and writes nothing', async () => {
+    const dir = folder({ 'log.csv': 'epoch,loss,val_loss\n0,0.5,0.6\n1,0.4,2e15\n2,0.3,0.5\n' });
+    const { io, stderr, files } = fakeIo(dir);
+    expect(
+      await runCli(['curves', 'import', '--from', 'csv-log', 'log.csv', '--out', 'c.json'], io),
+    ).toBe(2);
+    expect(stderr()).toBe(
+      'log.csv: line 3 column "val_loss" must be a decimal number within ±1e15 (got "2e15"). Rescale the values (thousands instead of units); larger ones overflow in the statistics.\n',
+    );
+    expect(files.size).toBe(0);
+  });
+
+  it('refuses an evals_result value beyond ±1e15 at its JSON pointer, and writes nothing', async () => {
+    const evals = JSON.stringify({
+      train: { rmse: [3, 2, 1.5] },
+      eval: { rmse: [3.5, -3e15, 2.5] },
+    });
+    const dir = folder({ 'evals.json': evals });
+    const { io, stderr, files } = fakeIo(dir);
+    expect(
+      await runCli(
+        ['curves', 'import', '--from', 'evals-result', 'evals.json', '--out', 'c.json'],
+        io,
+      ),
+    ).toBe(2);
+    expect(stderr()).toBe(
+      'evals.json: /eval/rmse/1 "eval/rmse" must be a decimal number within ±1e15 (got "-3000000000000000"). Rescale the values (thousands instead of units); larger ones overflow in the statistics.\n',
     );
     expect(files.size).toBe(0);
   });

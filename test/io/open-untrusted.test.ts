@@ -3,6 +3,7 @@
  * with chmod when the tests run as root, so `open` is made to answer it here), the UTF-8 check
  * against Node's own decoder, and reading exactly the promised bytes.
  */
+import { isUtf8 } from 'node:buffer';
 import { appendFileSync, mkdtempSync, truncateSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
@@ -143,6 +144,23 @@ describe('firstInvalidUtf8', () => {
           const bad = firstInvalidUtf8(bytes);
           expect(bad < 0).toBe(valid(bytes));
           if (bad >= 0) expect(valid(bytes.subarray(0, bad))).toBe(true);
+        },
+      ),
+      { numRuns: 2000 },
+    );
+  });
+
+  it("agrees with node:buffer's isUtf8, which decodeUtf8 asks first", () => {
+    // Source: Node's isUtf8 (simdutf, RFC 3629) against the byte loop, on near-valid text.
+    fc.assert(
+      fc.property(
+        fc.string({ unit: 'binary', maxLength: 40 }),
+        fc.nat(),
+        fc.integer({ min: 0, max: 255 }),
+        (text, at, byte) => {
+          const bytes = Buffer.from(text, 'utf8');
+          if (bytes.length > 0) bytes[at % bytes.length] = byte;
+          expect(firstInvalidUtf8(bytes) < 0).toBe(isUtf8(bytes));
         },
       ),
       { numRuns: 2000 },

@@ -72,7 +72,7 @@ export function progressQuotient(
   return quotients(generalizationLoss(validation), trainingProgress(train, k), k);
 }
 
-/** PQ from GL and P_k already computed (epochVerdict needs all three). */
+/** PQ from GL and P_k already computed. */
 function quotients(
   gl: readonly number[],
   progress: readonly (number | null)[],
@@ -104,7 +104,7 @@ export function pqStop(
 }
 
 /** First strip end t where E_va rose over each of s successive strips (E_va(t) > E_va(t − k) …). */
-export function upStop(validation: readonly number[], s: number, k = STRIP): number | null {
+export function upStop(validation: ArrayLike<number>, s: number, k = STRIP): number | null {
   let run = 0;
   for (let t = 2 * k - 1; t < validation.length; t += k) {
     run = (validation[t] as number) > (validation[t - k] as number) ? run + 1 : 0;
@@ -124,41 +124,54 @@ export interface EpochVerdict {
   stopsAt: Record<string, number | null>;
 }
 
+/**
+ * The verdict in one pass over the curve, without an array per criterion: GL, P_k and PQ are
+ * computed point by point, with the same operations in the same order as the functions above
+ * (which define them and serve as the reference in the tests), so the numbers are identical.
+ * Linear in the number of points (P_k sums k values per strip end).
+ */
 export function epochVerdict(
-  validation: readonly number[],
-  train: readonly number[] | null,
+  validation: ArrayLike<number>,
+  train: ArrayLike<number> | null,
 ): EpochVerdict {
-  const last = validation.length - 1;
+  const n = validation.length;
+  const last = n - 1;
+  const k = STRIP;
   let bestIndex = 0;
-  validation.forEach((v, i) => {
-    if (v < (validation[bestIndex] as number)) bestIndex = i;
-  });
-  const gls = generalizationLoss(validation);
-  const gl = gls[last] as number;
-  const stopsAt: Record<string, number | null> = {};
-  for (const alpha of GL_ALPHAS) stopsAt[`GL_${alpha}`] = firstAbove(gls, alpha);
+  let best = Infinity;
+  let gl = 0;
   let pq: number | null = null;
+  let lastProgress: number | null = null;
+  const glStops: (number | null)[] = GL_ALPHAS.map(() => null);
+  const pqStops: (number | null)[] = PQ_ALPHAS.map(() => null);
+  for (let t = 0; t < n; t++) {
+    const v = validation[t] as number;
+    if (v < (validation[bestIndex] as number)) bestIndex = t;
+    best = Math.min(best, v);
+    gl = best === 0 ? (v === 0 ? 0 : Infinity) : (100 * (v - best)) / Math.abs(best);
+    for (let a = 0; a < GL_ALPHAS.length; a++)
+      if (glStops[a] === null && gl > (GL_ALPHAS[a] as number)) glStops[a] = t;
+    if (train === null || t < k - 1 || ((t + 1) % k !== 0 && t !== last)) continue;
+    const progress = windowProgress(train, t, k);
+    if (t === last) lastProgress = progress;
+    if ((t + 1) % k !== 0) continue;
+    const q = progress === 0 ? (gl === 0 ? 0 : Infinity) : gl / progress;
+    pq = q;
+    for (let a = 0; a < PQ_ALPHAS.length; a++)
+      if (pqStops[a] === null && q > (PQ_ALPHAS[a] as number)) pqStops[a] = t;
+  }
+  const stopsAt: Record<string, number | null> = {};
+  GL_ALPHAS.forEach((alpha, a) => (stopsAt[`GL_${alpha}`] = glStops[a] ?? null));
   let stoppedEarly = false;
   if (train) {
-    const progresses = trainingProgress(train);
-    const pqs = quotients(gls, progresses, STRIP);
-    for (const alpha of PQ_ALPHAS) stopsAt[`PQ_${alpha}`] = firstAbove(pqs, alpha);
-    for (let t = last; t >= 0; t--) {
-      const q = pqs[t];
-      if (q !== null && q !== undefined) {
-        pq = q;
-        break;
-      }
-    }
-    const progress = progresses[last];
+    PQ_ALPHAS.forEach((alpha, a) => (stopsAt[`PQ_${alpha}`] = pqStops[a] ?? null));
     stoppedEarly =
-      validation.length >= STRIP &&
+      n >= STRIP &&
       gl <= EARLY_GL &&
-      slope(validation.slice(-STRIP)) < 0 &&
-      slope(train.slice(-STRIP)) < 0 &&
-      progress !== null &&
-      progress !== undefined &&
-      progress >= PROGRESS_STALLED;
+      slope(validation, n - STRIP) < 0 &&
+      slope(train, n - STRIP) < 0 &&
+      lastProgress !== null &&
+      lastProgress >= PROGRESS_STALLED;
   }
   for (const s of UP_STRIPS) stopsAt[`UP_${s}`] = upStop(validation, s);
   return {
@@ -172,21 +185,30 @@ export function epochVerdict(
   };
 }
 
-function firstAbove(values: readonly (number | null)[], alpha: number): number | null {
-  const t = values.findIndex((v) => v !== null && v > alpha);
-  return t < 0 ? null : t;
+/** P_k(t) of trainingProgress, for one t ≥ k − 1. */
+function windowProgress(train: ArrayLike<number>, t: number, k: number): number {
+  let sum = 0;
+  let min = Infinity;
+  for (let i = t - k + 1; i <= t; i++) {
+    sum += train[i] as number;
+    min = Math.min(min, train[i] as number);
+  }
+  if (min === 0) return sum === 0 ? 0 : Infinity;
+  return 1000 * (sum / (k * min) - 1);
 }
 
-/** Least-squares slope of values against their index. */
-function slope(values: readonly number[]): number {
-  const n = values.length;
+/** Least-squares slope against the index of the values from `from` (≥ 0) to the end. */
+function slope(all: ArrayLike<number>, from: number): number {
+  const n = all.length - from;
   const mx = (n - 1) / 2;
-  const my = values.reduce((s, v) => s + v, 0) / n;
+  let sum = 0;
+  for (let i = 0; i < n; i++) sum += all[from + i] as number;
+  const my = sum / n;
   let sxy = 0;
   let sxx = 0;
-  values.forEach((v, i) => {
-    sxy += (i - mx) * (v - my);
+  for (let i = 0; i < n; i++) {
+    sxy += (i - mx) * ((all[from + i] as number) - my);
     sxx += (i - mx) ** 2;
-  });
+  }
   return sxx > 0 ? sxy / sxx : 0;
 }

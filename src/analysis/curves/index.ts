@@ -49,7 +49,9 @@ export function analyzeCurves(curves: Curves | undefined, context: CurvesContext
   if (!curves) return report;
   const range = { min: Infinity, max: -Infinity };
   for (const curve of [curves.epochs, curves.training_examples, curves.regularization]) {
-    for (const p of curve ?? []) {
+    if (curve === undefined) continue;
+    for (let i = 0; i < curve.length; i++) {
+      const p = curve[i] as CurvePoint;
       range.min = Math.min(range.min, p.validation, p.train ?? Infinity);
       range.max = Math.max(range.max, p.validation, p.train ?? -Infinity);
     }
@@ -63,18 +65,15 @@ export function analyzeCurves(curves: Curves | undefined, context: CurvesContext
   return report;
 }
 
+/** The points a chart shows: LTTB on the validation errors, keeping `keep`. */
 function chart(
   points: readonly CurvePoint[],
   scale: ErrorScale,
   keep: number[],
+  columns: Columns = columnsOf(points, scale),
 ): EpochsEvidence['chart'] {
-  const errors = new Float64Array(points.length);
-  const xs = new Float64Array(points.length);
-  points.forEach((p, i) => {
-    errors[i] = scale.toError(p.validation);
-    xs[i] = p.x;
-  });
-  const picked = downsampleKeeping(xs, errors, Math.min(CHART_POINTS, points.length), keep);
+  const { xs, validation } = columns;
+  const picked = downsampleKeeping(xs, validation, Math.min(CHART_POINTS, points.length), keep);
   return picked.map((i) => {
     const p = points[i] as CurvePoint;
     return p.train === undefined
@@ -83,16 +82,39 @@ function chart(
   });
 }
 
+/** A curve as columns: x, validation errors, and train errors (null when a point has none). */
+interface Columns {
+  xs: Float64Array;
+  validation: Float64Array;
+  train: Float64Array | null;
+}
+
+/** The columns of a curve in one pass over its points. */
+function columnsOf(points: readonly CurvePoint[], scale: ErrorScale): Columns {
+  const n = points.length;
+  const xs = new Float64Array(n);
+  const validation = new Float64Array(n);
+  let train: Float64Array | null = new Float64Array(n);
+  for (let i = 0; i < n; i++) {
+    const p = points[i] as CurvePoint;
+    xs[i] = p.x;
+    validation[i] = scale.toError(p.validation);
+    if (train === null) continue;
+    if (p.train === undefined) train = null;
+    else train[i] = scale.toError(p.train);
+  }
+  return { xs, validation, train };
+}
+
+/** Epoch curves may be long (a loss logged per step): columns read once, then one pass each. */
 function analyzeEpochs(
   points: readonly CurvePoint[],
   scale: ErrorScale,
 ): EpochsEvidence | CurveSkipped {
   if (points.length < MIN_EPOCH_POINTS)
     return { skipped: 'too-few-points', points: points.length, needs: MIN_EPOCH_POINTS };
-  const validation = points.map((p) => scale.toError(p.validation));
-  const hasTrain = points.every((p) => p.train !== undefined);
-  const train = hasTrain ? points.map((p) => scale.toError(p.train as number)) : null;
-  const verdict = epochVerdict(validation, train);
+  const columns = columnsOf(points, scale);
+  const verdict = epochVerdict(columns.validation, columns.train);
   const best = points[verdict.bestIndex] as CurvePoint;
   const final = points[points.length - 1] as CurvePoint;
   return {
@@ -110,7 +132,7 @@ function analyzeEpochs(
         t === null ? null : (points[t] as CurvePoint).x,
       ]),
     ),
-    chart: chart(points, scale, [verdict.bestIndex]),
+    chart: chart(points, scale, [verdict.bestIndex], columns),
   };
 }
 

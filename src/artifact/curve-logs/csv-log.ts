@@ -189,7 +189,7 @@ export function readCsvLog(
           s.problems.push(notFinite(file, `line ${line}`, `column "${s.name}"`, cell, bound));
         continue;
       }
-      budget.take(file, `line ${line}`);
+      budget.take(file, where, line);
       s.points.push({ x, value, at: line });
     }
   }

@@ -99,7 +99,7 @@ export function readEvalsResult(
             });
           return;
         }
-        budget.take(file, `${path}/${i}`);
+        budget.take(file, s.where, i);
         s.points.push({ x: i + 1, value, at: i });
       });
       series.push(s);

@@ -60,7 +60,7 @@ export function readMlflowMetric(
         series.problems.push(notFinite(file, `line ${line}`, `metric "${key}"`, valueText ?? ''));
       continue;
     }
-    budget.take(file, `line ${line}`);
+    budget.take(file, series.where, line);
     series.points.push({ x: Number(stepText), value, at: line });
   }
   return { series: [series], warnings: [] };

@@ -239,7 +239,7 @@ export function readTensorBoard(
           });
         continue;
       }
-      budget.take(file, `record ${record.number}`);
+      budget.take(file, where, record.number);
       series.points.push({ x: event.step, value: v.value, at: record.number });
     }
   }

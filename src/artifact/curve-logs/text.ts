@@ -2,6 +2,7 @@
 import { InputError, quote, type Issue } from '../../model/errors.js';
 import { formatLimit } from '../../model/limits.js';
 import { MAX_POINTS, MAX_TEXT_BYTES } from './limits.js';
+import { pointerOf, type Where } from './types.js';
 
 const decoder = new TextDecoder('utf-8', { fatal: true });
 
@@ -81,13 +82,17 @@ export function notFinite(
 export class PointBudget {
   private used = 0;
   constructor(private readonly limit = MAX_POINTS) {}
-  take(file: string, pointer: string): void {
+  /**
+   * One more point, at `at` of `where` in `file`; its pointer is written only when the budget is
+   * exceeded (a log may hold a million points).
+   */
+  take(file: string, where: Where, at: number): void {
     this.used++;
     if (this.used > this.limit) {
       throw new InputError([
         {
           file,
-          pointer,
+          pointer: pointerOf(where, at),
           expected: `holds more than ${this.limit.toLocaleString('en-US')} points, the most one import reads`,
           hint: 'Import fewer files, or log less often (per epoch rather than per step).',
         },

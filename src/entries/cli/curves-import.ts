@@ -8,6 +8,7 @@ import {
   type CurveLogFormat,
 } from '../../artifact/curve-logs/index.js';
 import { EXIT, UsageError } from '../../model/errors.js';
+import { MAX_EPOCH_POINTS, MAX_MAGNITUDE } from '../../model/limits.js';
 import { nodeCurveLogFs, readCurveLogs, type CurveLogFs } from '../../io/curve-logs.js';
 import { curveImportNotes } from '../../report/curve-log-notes.js';
 import { parseFlags } from './args.js';
@@ -106,7 +107,10 @@ export async function curvesImportCommand(
 
   const paths = positionals.map((p) => ({ path: resolve(io.cwd, p), display: p }));
   const { read, catalogue } = await readCurveLogs(format, paths, fs, x === undefined ? {} : { x });
+  // The curve meets the artifact's rules for an epoch curve here, before anything is written.
   const curve = buildCurve(read, catalogue, {
+    maxMagnitude: MAX_MAGNITUDE,
+    maxPoints: MAX_EPOCH_POINTS,
     ...(train === undefined ? {} : { train }),
     ...(validation === undefined ? {} : { validation }),
     ...(metric === undefined ? {} : { metric }),

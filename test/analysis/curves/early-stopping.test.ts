@@ -108,3 +108,113 @@ describe('epochVerdict', () => {
     expect(epochVerdict([0.9, 0.8, 0.7, 0.6, 0.5, 0.4], null).stoppedEarly).toBe(false);
   });
 });
+
+describe('epochVerdict in one pass equals the criteria computed array by array', () => {
+  /**
+   * Naive reference: each criterion as its own array (generalizationLoss, trainingProgress,
+   * progressQuotient, which transcribe Prechelt's definitions) and the verdict read off them.
+   */
+  function naiveVerdict(v: number[], t: number[] | null) {
+    const last = v.length - 1;
+    const best = v.indexOf(Math.min(...v));
+    const gls = generalizationLoss(v);
+    const gl = gls[last] as number;
+    const first = (xs: (number | null)[], alpha: number) => {
+      const i = xs.findIndex((x) => x !== null && x > alpha);
+      return i < 0 ? null : i;
+    };
+    const stopsAt: Record<string, number | null> = {};
+    for (const a of [1, 2, 3, 5]) stopsAt[`GL_${a}`] = first(gls, a);
+    let pq: number | null = null;
+    let stoppedEarly = false;
+    if (t !== null) {
+      const pqs = progressQuotient(v, t);
+      for (const a of [0.5, 0.75, 1, 2, 3]) stopsAt[`PQ_${a}`] = first(pqs, a);
+      pq = [...pqs].reverse().find((q) => q !== null) ?? null;
+      const slope = (ys: number[]) => {
+        const n = ys.length;
+        const mx = (n - 1) / 2;
+        const my = ys.reduce((s, y) => s + y, 0) / n;
+        let sxy = 0;
+        let sxx = 0;
+        ys.forEach((y, i) => {
+          sxy += (i - mx) * (y - my);
+          sxx += (i - mx) ** 2;
+        });
+        return sxx > 0 ? sxy / sxx : 0;
+      };
+      const progress = trainingProgress(t)[last];
+      stoppedEarly =
+        v.length >= 5 &&
+        gl <= 1 &&
+        slope(v.slice(-5)) < 0 &&
+        slope(t.slice(-5)) < 0 &&
+        progress !== null &&
+        progress !== undefined &&
+        progress >= 0.1;
+    }
+    for (const s of [2, 3, 4, 6, 8]) stopsAt[`UP_${s}`] = upStop(v, s);
+    return {
+      bestIndex: best,
+      gl: Number.isFinite(gl) ? gl : null,
+      pq: pq !== null && Number.isFinite(pq) ? pq : null,
+      stoppedLate: best < last && gl > 5,
+      stoppedEarly,
+      stopsAt,
+    };
+  }
+
+  // Values from a small grid (ties, zeros, negatives for a negated metric) or any double.
+  const value = fc.oneof(
+    fc.constantFrom(0, 0.1, 0.2, 0.25, 0.3, 1, -0.5),
+    fc.double({ min: -2, max: 2, noNaN: true }),
+  );
+
+  it('property: same best index, GL, PQ, verdicts and stopping points, to the bit', () => {
+    // Source: the naive reference above, built from the per-criterion definitions.
+    fc.assert(
+      fc.property(
+        fc.array(fc.tuple(value, value), { minLength: 1, maxLength: 60 }),
+        fc.boolean(),
+        (pairs, withTrain) => {
+          const v = pairs.map(([x]) => x);
+          const t = withTrain ? pairs.map(([, y]) => y) : null;
+          expect(epochVerdict(Float64Array.from(v), t && Float64Array.from(t))).toEqual(
+            naiveVerdict(v, t),
+          );
+          expect(epochVerdict(v, t)).toEqual(naiveVerdict(v, t));
+        },
+      ),
+      { numRuns: 3000, seed: 20261130 },
+    );
+  });
+
+  it('property: the same on long, noisy, falling-then-rising curves', () => {
+    fc.assert(
+      fc.property(
+        fc.integer({ min: 50, max: 3000 }),
+        fc.integer({ min: 1, max: 2 ** 31 - 1 }),
+        (n, seed) => {
+          let s = seed;
+          const noise = () => {
+            s = (Math.imul(s, 48271) % 2147483647) >>> 0;
+            return s / 2147483647 - 0.5;
+          };
+          const v: number[] = [];
+          const t: number[] = [];
+          for (let i = 0; i < n; i++) {
+            const u = i / n;
+            t.push(0.2 + 0.5 * Math.exp(-5 * u) + 0.01 * noise());
+            v.push(
+              0.25 + 0.5 * Math.exp(-5 * u) + 0.2 * Math.max(0, u - 0.6) ** 2 + 0.01 * noise(),
+            );
+          }
+          expect(epochVerdict(Float64Array.from(v), Float64Array.from(t))).toEqual(
+            naiveVerdict(v, t),
+          );
+        },
+      ),
+      { numRuns: 200, seed: 20261130 },
+    );
+  });
+});

@@ -246,3 +246,102 @@ describe('readCsvLog', () => {
     );
   });
 });
+
+describe('buildCurve bounds', () => {
+  const log = 'epoch,loss,val_loss\n1,0.5,0.6\n2,0.4,0.5\n3,0.3,0.45\n3,0.3,0.44\n4,0.2,0.4\n';
+
+  it('keeps at most maxPoints points (one per x with a validation value), else names the file', () => {
+    const read = readCsvLog(log, 'log.csv');
+    // Five rows, x = 3 twice: four points.
+    expect(buildCurve(read, catalogue, { maxPoints: 4 }).points).toHaveLength(4);
+    expect(() => buildCurve(read, catalogue, { maxPoints: 3 })).toThrow(
+      'log.csv must give a curve of at most 3 points (one per x with a value of "val_loss") (got 4 points). Log less often',
+    );
+  });
+
+  it('refuses x or a value beyond maxMagnitude, by its place in the file', () => {
+    const read = readCsvLog('step,loss,val_loss\n1,0.5,0.6\n2e16,0.4,0.5\n', 'log.csv', {
+      x: 'step',
+    });
+    expect(() => buildCurve(read, catalogue, { maxMagnitude: 1e15 })).toThrow(
+      'log.csv: line 3 x ("step") of "val_loss" must be a decimal number within ±1e15 (got "20000000000000000")',
+    );
+    expect(buildCurve(read, catalogue).points).toHaveLength(2);
+    const value = readCsvLog('epoch,loss,val_loss\n1,5e15,0.6\n', 'log.csv');
+    expect(() => buildCurve(value, catalogue, { maxMagnitude: 1e15 })).toThrow(
+      'log.csv: line 2 "loss" must be a decimal number within ±1e15 (got "5000000000000000")',
+    );
+  });
+});
+
+describe('buildCurve merges series as a map by x would', () => {
+  /**
+   * Naive reference: every series collapsed through a Map of running means by x, the validation
+   * x sorted, train values looked up by x (the straightforward merge; common practice).
+   */
+  function naive(read: ReturnType<typeof readCsvLog>) {
+    const byX = (name: string) => {
+      const means = new Map<number, { mean: number; n: number }>();
+      for (const p of read.series.find((s) => s.name === name)?.points ?? []) {
+        const e = means.get(p.x);
+        if (e === undefined) means.set(p.x, { mean: p.value, n: 1 });
+        else {
+          e.n++;
+          e.mean += p.value / e.n - e.mean / e.n;
+        }
+      }
+      return means;
+    };
+    const v = byX('val_loss');
+    const t = byX('loss');
+    const points = [...v.keys()]
+      .sort((a, b) => a - b)
+      .map((x) => {
+        const train = t.get(x)?.mean;
+        const validation = (v.get(x) as { mean: number }).mean;
+        return train === undefined ? { x, validation } : { x, train, validation };
+      });
+    const merged = (m: Map<number, { n: number }>) => [...m.values()].filter((e) => e.n > 1).length;
+    return {
+      points,
+      averaged: [merged(v), merged(t)],
+      missing: [...v.keys()].filter((x) => !t.has(x)).length,
+      dropped: [...t.keys()].filter((x) => !v.has(x)).length,
+    };
+  }
+
+  it('property: same points and the same counts in the warnings, sorted or not, with repeats', () => {
+    // Source: the naive map-based merge above.
+    const row = fc.tuple(
+      fc.integer({ min: -3, max: 12 }),
+      fc.option(fc.double({ min: -5, max: 5, noNaN: true }), { nil: undefined }),
+      fc.option(fc.double({ min: -5, max: 5, noNaN: true }), { nil: undefined }),
+    );
+    fc.assert(
+      fc.property(fc.array(row, { minLength: 1, maxLength: 30 }), fc.boolean(), (rows, sorted) => {
+        const ordered = sorted ? [...rows].sort((a, b) => a[0] - b[0]) : rows;
+        const text = `epoch,loss,val_loss\n${ordered
+          .map(([x, t, v]) => `${x},${t ?? ''},${v ?? ''}`)
+          .join('\n')}\n`;
+        const read = readCsvLog(text, 'log.csv');
+        const expected = naive(read);
+        if (expected.points.length === 0) return;
+        const curve = buildCurve(read, catalogue, { train: 'loss', validation: 'val_loss' });
+        expect(curve.points).toEqual(expected.points);
+        const count = (code: string, series: string) => {
+          const w = curve.warnings.find(
+            (w) => w.code === code && 'series' in w && w.series === series,
+          ) as { xs?: number; points?: number } | undefined;
+          return w === undefined ? 0 : (w.xs ?? w.points ?? 0);
+        };
+        expect([
+          count('duplicates-averaged', 'val_loss'),
+          count('duplicates-averaged', 'loss'),
+        ]).toEqual(expected.averaged);
+        expect(count('train-missing', 'loss')).toBe(expected.missing);
+        expect(count('train-only-dropped', 'loss')).toBe(expected.dropped);
+      }),
+      { numRuns: 1500, seed: 20261130 },
+    );
+  });
+});
