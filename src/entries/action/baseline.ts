@@ -21,7 +21,8 @@ import type { Settings } from './settings.js';
 export interface BaselineDeps {
   settings: Settings;
   context: RunContext;
-  octokit: GitHubClient;
+  /** The REST client, built on first use. */
+  client: () => Promise<GitHubClient>;
   io: ActionIO;
 }
 
@@ -30,8 +31,9 @@ export interface BaselineDeps {
  * replaces the branch the event names.
  */
 export async function resolveBaseline(deps: BaselineDeps, baseBranch?: string): Promise<string> {
-  const { settings, context, octokit, io } = deps;
+  const { settings, context, io } = deps;
   if (settings.baseline !== null) return resolve(settings.workspace, settings.baseline);
+  const octokit = await deps.client();
   const name = settings.baselineArtifact ?? '';
   const filter =
     baseBranch !== undefined && settings.baselineRef === null
@@ -93,7 +95,9 @@ async function currentWorkflow(deps: BaselineDeps): Promise<string | number> {
   const fromRef =
     deps.settings.workflowRef === null ? null : workflowFileFromRef(deps.settings.workflowRef);
   if (fromRef !== null) return fromRef;
-  const { data } = await deps.octokit.rest.actions.getWorkflowRun({
+  const { data } = await (
+    await deps.client()
+  ).rest.actions.getWorkflowRun({
     ...deps.context.repo,
     run_id: deps.context.runId,
   });
