@@ -6,20 +6,19 @@ const entries = { cli: 'src/entries/cli.ts', index: 'src/entries/action.ts' };
 const entryPoints = Object.fromEntries(Object.entries(entries).filter(([, p]) => existsSync(p)));
 
 /**
- * The files of @actions/core and @actions/github have no side effect a caller relies on when it
- * uses none of their exports, but esbuild cannot know that (their package.json declares nothing).
- * Saying so lets the bundle leave out what the action never calls at start-up: @actions/core's
- * OIDC client (and through it @actions/http-client and undici, 430 kB) and its platform probe
- * (@actions/exec), and @actions/github's client factory when only its event context is imported.
- * The REST client and its HTTP stack are then loaded when a step talks to GitHub.
+ * The files of @actions/core have no side effect a caller relies on when it uses none of their
+ * exports, but esbuild cannot know that (the package.json declares nothing). Saying so lets the
+ * bundle leave out what the action never calls: @actions/core's OIDC client (and through it
+ * @actions/http-client and undici, 430 kB, which every run would load) and its platform probe
+ * (@actions/exec). The REST client and its HTTP stack are loaded when a step talks to GitHub.
  */
 const sideEffectFree = {
-  name: 'side-effect-free-actions-toolkit',
+  name: 'side-effect-free-actions-core',
   setup(b) {
-    const own = /[\\/]node_modules[\\/]@actions[\\/](core|github)[\\/]/;
+    const own = /[\\/]node_modules[\\/]@actions[\\/]core[\\/]/;
     b.onResolve({ filter: /.*/ }, async (args) => {
       if (args.pluginData?.sideEffectFree === true) return undefined;
-      if (!own.test(args.importer) && !args.path.startsWith('@actions/')) return undefined;
+      if (!own.test(args.importer) && !args.path.startsWith('@actions/core')) return undefined;
       const { path, external, namespace, errors } = await b.resolve(args.path, {
         kind: args.kind,
         importer: args.importer,

@@ -93,9 +93,8 @@ async function currentWorkflow(deps: BaselineDeps): Promise<string | number> {
   const fromRef =
     deps.settings.workflowRef === null ? null : workflowFileFromRef(deps.settings.workflowRef);
   if (fromRef !== null) return fromRef;
-  const { data } = await (
-    await deps.client()
-  ).rest.actions.getWorkflowRun({
+  const octokit = await deps.client();
+  const { data } = await octokit.rest.actions.getWorkflowRun({
     ...deps.context.repo,
     run_id: deps.context.runId,
   });

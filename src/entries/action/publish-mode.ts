@@ -56,9 +56,8 @@ export async function runPublish(deps: PublishDeps): Promise<void> {
       got: `${note.repository} at ${note.headSha}`,
     });
   }
-  const { data: pull } = await (
-    await deps.client()
-  ).rest.pulls.get({
+  const octokit = await deps.client();
+  const { data: pull } = await octokit.rest.pulls.get({
     ...context.repo,
     pull_number: note.number,
   });
