@@ -1,12 +1,39 @@
 // Bundles the CLI (and, when present, the action entry) into dist/ as ESM files for Node 20+.
 import { build } from 'esbuild';
-import { existsSync, readdirSync, rmSync } from 'node:fs';
+import { existsSync, readdirSync, rmSync, writeFileSync } from 'node:fs';
 
 const entries = { cli: 'src/entries/cli.ts', index: 'src/entries/action.ts' };
 const entryPoints = Object.fromEntries(Object.entries(entries).filter(([, p]) => existsSync(p)));
 
+/**
+ * The files of @actions/core have no side effect a caller relies on when it uses none of their
+ * exports, but esbuild cannot know that (the package.json declares nothing). Saying so lets the
+ * bundle leave out what the action never calls: @actions/core's OIDC client (and through it
+ * @actions/http-client and undici, 430 kB, which every run would load) and its platform probe
+ * (@actions/exec). The REST client and its HTTP stack are loaded when a step talks to GitHub.
+ */
+const sideEffectFree = {
+  name: 'side-effect-free-actions-core',
+  setup(b) {
+    const own = /[\\/]node_modules[\\/]@actions[\\/]core[\\/]/;
+    b.onResolve({ filter: /.*/ }, async (args) => {
+      if (args.pluginData?.sideEffectFree === true) return undefined;
+      if (!own.test(args.importer) && !args.path.startsWith('@actions/core')) return undefined;
+      const { path, external, namespace, errors } = await b.resolve(args.path, {
+        kind: args.kind,
+        importer: args.importer,
+        resolveDir: args.resolveDir,
+        pluginData: { sideEffectFree: true },
+      });
+      if (errors.length > 0 || !own.test(path)) return undefined;
+      return { path, external, namespace, sideEffects: false };
+    });
+  },
+};
+
 const result = await build({
   entryPoints,
+  plugins: [sideEffectFree],
   outdir: 'dist',
   bundle: true,
   // Split per command and mode (they are imported when they run): start-up parses only what runs.
@@ -29,6 +56,11 @@ const result = await build({
     js: "import { createRequire as __fitgapCreateRequire } from 'node:module'; const require = __fitgapCreateRequire(import.meta.url);",
   },
 });
+
+// `FITGAP_METAFILE=meta.json npm run build` keeps esbuild's record of what went into each chunk
+// (inspect it with esbuild's analyzer to see which chunks a command loads and what is in them).
+if (process.env.FITGAP_METAFILE)
+  writeFileSync(process.env.FITGAP_METAFILE, JSON.stringify(result.metafile));
 
 // Chunk names carry a content hash: remove the chunks of earlier builds (after this one is written,
 // so that a process still running the previous build loses its files as late as possible).

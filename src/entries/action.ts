@@ -1,28 +1,30 @@
 /**
- * The GitHub Action entry: read the settings, build the event context and the REST client, run
- * the chosen mode. Environment reads happen here and in `action/settings.ts` only.
+ * The GitHub Action entry: read the settings and the event context, run the chosen mode with a
+ * REST client built on first use. Environment reads happen here and in `action/settings.ts` only
+ * (`action/event-context.ts` reads the environment this entry passes it).
  */
 import * as core from '@actions/core';
 import { readAuditSettings } from './action/audit-settings.js';
 import { handleFailure } from './action/failure.js';
 import { coreIO } from './action/io.js';
+import { readEventContext } from './action/event-context.js';
 import { readSettings } from './action/settings.js';
-import { createClient } from '../io/github/client.js';
+import type { ApiSettings } from './action/settings.js';
+import type { GitHubClient } from '../io/github/client.js';
 import { buildRunContext } from '../io/github/context.js';
 
 async function main(): Promise<void> {
   const settings = readSettings();
   core.setSecret(settings.api.token);
-  // Imported here, not at the top: @actions/github reads the environment when it is loaded.
-  const { context } = await import('@actions/github');
-  const { defaults } = await import('@actions/github/lib/utils');
-  const octokit = createClient({
-    ...settings.api,
-    // The proxy-aware transport @actions/github builds for GITHUB_API_URL.
-    ...(defaults.request?.fetch === undefined ? {} : { fetch: defaults.request.fetch }),
-    log: (message) => core.info(message),
-  });
-  const deps = { settings, context: buildRunContext(context), octokit, io: coreIO() };
+  let client: Promise<GitHubClient> | undefined;
+  const deps = {
+    settings,
+    context: buildRunContext(readEventContext(process.env)),
+    // Built when a step first talks to GitHub: the REST client and its HTTP stack (undici) are
+    // large, and a review with comment and status check off sends nothing.
+    client: () => (client ??= githubClient(settings.api)),
+    io: coreIO(),
+  };
   // Each mode is loaded when it runs (the bundle is split per mode).
   if (settings.mode === 'audit') {
     const { runAudit } = await import('./action/audit-mode.js');
@@ -30,6 +32,19 @@ async function main(): Promise<void> {
   } else if (settings.mode === 'publish') {
     await (await import('./action/publish-mode.js')).runPublish(deps);
   } else await (await import('./action/review-mode.js')).runReview(deps);
+}
+
+async function githubClient(api: ApiSettings): Promise<GitHubClient> {
+  const [{ defaults }, { createClient }] = await Promise.all([
+    import('@actions/github/lib/utils'),
+    import('../io/github/client.js'),
+  ]);
+  return createClient({
+    ...api,
+    // The proxy-aware transport @actions/github builds for GITHUB_API_URL.
+    ...(defaults.request?.fetch === undefined ? {} : { fetch: defaults.request.fetch }),
+    log: (message) => core.info(message),
+  });
 }
 
 main().catch(handleFailure);

@@ -27,10 +27,9 @@ import type { LoadedRun } from './load-run.js';
 import { decodeUtf8, readChecked, type FileLimits } from './open-untrusted.js';
 import validatePullRequestSchema from '../validate/generated/pull-request-note.js';
 
-export const REVIEW_FILE = 'review.json';
-export const PULL_REQUEST_FILE = 'pull-request.json';
-export const RUN_FILE = 'run.json';
-export const PREDICTIONS_FILE = 'predictions.csv';
+import { PREDICTIONS_FILE, PULL_REQUEST_FILE, REVIEW_FILE, RUN_FILE } from './bundle-files.js';
+
+export { PREDICTIONS_FILE, PULL_REQUEST_FILE, REVIEW_FILE, RUN_FILE };
 export const SIDES = ['baseline', 'candidate'] as const;
 export type Side = (typeof SIDES)[number];
 

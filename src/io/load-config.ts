@@ -6,7 +6,6 @@
  */
 import type { ErrorObject } from 'ajv';
 import type * as Yaml from 'yaml';
-import validateConfigSchema from '../validate/generated/config-schema.js';
 import { InputError, quote, type Issue } from '../model/errors.js';
 import type { HyperparameterRolesConfig } from '../model/hyperparameter-roles.js';
 import { configRoleConflicts } from '../analysis/levers/resolve-knob.js';
@@ -26,12 +25,14 @@ import {
   type FileLimits,
 } from './open-untrusted.js';
 
-/** The config schema's validator, generated at build time (scripts/gen-validators.mjs). */
-function validator(): { (data: unknown): data is RawConfig; errors?: ErrorObject[] | null } {
-  return validateConfigSchema as {
-    (data: unknown): data is RawConfig;
-    errors?: ErrorObject[] | null;
-  };
+type ConfigValidator = { (data: unknown): data is RawConfig; errors?: ErrorObject[] | null };
+
+/**
+ * The config schema's validator, generated at build time (scripts/gen-validators.mjs). Loaded on
+ * first use, like the YAML parser: a review without a config file needs neither.
+ */
+async function validator(): Promise<ConfigValidator> {
+  return (await import('../validate/generated/config-schema.js')).default as ConfigValidator;
 }
 
 /** Deepest flow nesting (`[`, `{`) and block prefix (indentation and `- `) a config may use. */
@@ -96,8 +97,11 @@ function escapePointer(key: string): string {
 /** Parses and validates config text. */
 export async function parseConfig(text: string, file: string): Promise<ConfigFile> {
   // Imported here: a review without a config file does not load the YAML parser at all.
-  const { parseDocument } = await import('./yaml-parser.js');
-  const config = checkSettings(parseRaw(parseDocument, text, file), file);
+  const [{ parseDocument }, validate] = await Promise.all([
+    import('./yaml-parser.js'),
+    validator(),
+  ]);
+  const config = checkSettings(parseRaw(parseDocument, validate, text, file), file);
   const conflicts = roleConflictIssues(config.hyperparameters, file);
   if (conflicts.length > 0) throw new InputError(conflicts);
   return config;
@@ -144,7 +148,12 @@ function checkSettings(data: RawConfig, file: string): ConfigFile {
 /** The config before the settings keys are checked. */
 type RawConfig = Record<string, unknown>;
 
-function parseRaw(parseDocument: typeof Yaml.parseDocument, text: string, file: string): RawConfig {
+function parseRaw(
+  parseDocument: typeof Yaml.parseDocument,
+  validate: ConfigValidator,
+  text: string,
+  file: string,
+): RawConfig {
   const nesting = yamlNestingProblem(text);
   if (nesting !== null) {
     throw new InputError([
@@ -186,7 +195,6 @@ function parseRaw(parseDocument: typeof Yaml.parseDocument, text: string, file: 
       },
     ]);
   }
-  const validate = validator();
   // The settings keys are checked in `checkSettings`; the schema describes them for editors.
   const rest =
     data !== null && typeof data === 'object' && !Array.isArray(data)

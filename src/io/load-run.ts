@@ -9,7 +9,6 @@ import { lstat } from 'node:fs/promises';
 import { dirname, relative, resolve, sep } from 'node:path';
 import { InputError, type Issue } from '../model/errors.js';
 import type { EpochLogMapping } from '../model/config.js';
-import { parseEpochLog } from '../artifact/epoch-log.js';
 import type { PredictionsFile } from '../artifact/predictions.js';
 import { parseJson } from '../artifact/read-json.js';
 import type { Note } from '../model/review.js';
@@ -181,6 +180,8 @@ export async function loadRun(path: string, options: LoadRunOptions = {}): Promi
         });
         read.push({ realPath: log.file.realPath, id: log.file.id });
         const logText = decodeUtf8(log.bytes, logName, 'an epoch log');
+        // Loaded only when a log is mapped: the log readers are not needed otherwise.
+        const { parseEpochLog } = await import('../artifact/epoch-log.js');
         artifact.curves = {
           ...artifact.curves,
           epochs: parseEpochLog(logText, logName, options.epochLog),

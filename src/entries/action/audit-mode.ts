@@ -35,7 +35,8 @@ export interface AuditDeps extends PublishDeps {
 }
 
 export async function runAudit(deps: AuditDeps): Promise<void> {
-  const { settings, context, octokit, io, audit } = deps;
+  const { settings, context, io, audit } = deps;
+  const octokit = await deps.client();
   const overrides = settings.overrides;
   const { config, file: configFile } = await loadReviewConfig(
     settings.workspace,
@@ -108,7 +109,8 @@ async function comment(
   headSha: string,
   body: string,
 ): Promise<string | null> {
-  const { settings, context, octokit, io } = deps;
+  const { settings, context, io } = deps;
+  const octokit = await deps.client();
   try {
     const outcome = await publishComment({
       octokit,

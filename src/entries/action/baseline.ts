@@ -6,12 +6,6 @@
 import { mkdir, mkdtemp, writeFile } from 'node:fs/promises';
 import { basename, dirname, join, resolve } from 'node:path';
 import { InputError } from '../../model/errors.js';
-import {
-  downloadArtifact,
-  findArtifact,
-  pickRunFiles,
-  workflowFileFromRef,
-} from '../../io/github/artifacts.js';
 import type { RunFilter } from '../../io/github/artifacts.js';
 import type { GitHubClient } from '../../io/github/client.js';
 import type { RunContext } from '../../io/github/context.js';
@@ -21,7 +15,8 @@ import type { Settings } from './settings.js';
 export interface BaselineDeps {
   settings: Settings;
   context: RunContext;
-  octokit: GitHubClient;
+  /** The REST client, built on first use. */
+  client: () => Promise<GitHubClient>;
   io: ActionIO;
 }
 
@@ -30,8 +25,12 @@ export interface BaselineDeps {
  * replaces the branch the event names.
  */
 export async function resolveBaseline(deps: BaselineDeps, baseBranch?: string): Promise<string> {
-  const { settings, context, octokit, io } = deps;
+  const { settings, context, io } = deps;
   if (settings.baseline !== null) return resolve(settings.workspace, settings.baseline);
+  const octokit = await deps.client();
+  // Loaded only for a baseline from an artifact: the zip reader is not needed otherwise.
+  const { downloadArtifact, findArtifact, pickRunFiles } =
+    await import('../../io/github/artifacts.js');
   const name = settings.baselineArtifact ?? '';
   const filter =
     baseBranch !== undefined && settings.baselineRef === null
@@ -90,10 +89,12 @@ function runFilter(settings: Settings, context: RunContext): RunFilter {
 /** The workflow to search: the input, else the running one (from GITHUB_WORKFLOW_REF or the run). */
 async function currentWorkflow(deps: BaselineDeps): Promise<string | number> {
   if (deps.settings.baselineWorkflow !== null) return deps.settings.baselineWorkflow;
+  const { workflowFileFromRef } = await import('../../io/github/artifacts.js');
   const fromRef =
     deps.settings.workflowRef === null ? null : workflowFileFromRef(deps.settings.workflowRef);
   if (fromRef !== null) return fromRef;
-  const { data } = await deps.octokit.rest.actions.getWorkflowRun({
+  const octokit = await deps.client();
+  const { data } = await octokit.rest.actions.getWorkflowRun({
     ...deps.context.repo,
     run_id: deps.context.runId,
   });

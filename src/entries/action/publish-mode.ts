@@ -28,7 +28,7 @@ function refuse(issue: Omit<Issue, 'pointer'> & { pointer?: string }): never {
 }
 
 export async function runPublish(deps: PublishDeps): Promise<void> {
-  const { settings, context, octokit, io } = deps;
+  const { settings, context, io } = deps;
   const run = context.workflowRun;
   if (run === null || context.eventName !== 'workflow_run') {
     refuse({
@@ -56,6 +56,7 @@ export async function runPublish(deps: PublishDeps): Promise<void> {
       got: `${note.repository} at ${note.headSha}`,
     });
   }
+  const octokit = await deps.client();
   const { data: pull } = await octokit.rest.pulls.get({
     ...context.repo,
     pull_number: note.number,
@@ -132,7 +133,8 @@ export async function runPublish(deps: PublishDeps): Promise<void> {
 
 /** The triggering run's upload, refused before download when listed over the archive limit. */
 async function downloadUpload(deps: PublishDeps, run: WorkflowRunRef): Promise<Uint8Array> {
-  const { settings, context, octokit } = deps;
+  const { settings, context } = deps;
+  const octokit = await deps.client();
   const name = settings.reportArtifact;
   const { data } = await octokit.rest.actions.listWorkflowRunArtifacts({
     ...context.repo,

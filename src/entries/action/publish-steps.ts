@@ -17,7 +17,8 @@ import type { Settings } from './settings.js';
 export interface PublishDeps {
   settings: Settings;
   context: RunContext;
-  octokit: GitHubClient;
+  /** The REST client, built on first use (start-up loads no HTTP stack when nothing is sent). */
+  client: () => Promise<GitHubClient>;
   io: ActionIO;
 }
 
@@ -52,8 +53,9 @@ export async function commentStep(
   target: { pullNumber: number; headSha: string; currentHead?: string },
   body: string,
 ): Promise<string | null> {
-  const { settings, context, octokit, io } = deps;
+  const { settings, context, io } = deps;
   if (settings.comment === 'off') return null;
+  const octokit = await deps.client();
   try {
     const identity =
       settings.comment === 'update'
@@ -105,7 +107,8 @@ export async function gateCheckStep(
   review: Review,
   body: string,
 ): Promise<string | null> {
-  const { settings, context, octokit, io } = deps;
+  const { settings, context, io } = deps;
+  const octokit = await deps.client();
   const name = settings.commentKey === 'default' ? 'fitgap' : `fitgap (${settings.commentKey})`;
   try {
     const outcome = await publishGate({

@@ -3,7 +3,7 @@ import { mkdir, writeFile } from 'node:fs/promises';
 import { join } from 'node:path';
 import type { Review } from '../../model/review.js';
 import { renderJson } from '../../report/json.js';
-import { REVIEW_FILE } from '../../io/bundle.js';
+import { REVIEW_FILE } from '../../io/bundle-files.js';
 
 export interface ReportFiles {
   /** Folder to upload as the report artifact for the publish workflow. */

@@ -6,7 +6,6 @@
 import { basename, isAbsolute, join, relative, resolve } from 'node:path';
 import { renderMarkdown } from '../../report/markdown.js';
 import { reviewFiles } from '../../io/review-from-files.js';
-import { writeBundle } from '../../io/bundle.js';
 import { resolveBaseline } from './baseline.js';
 import type { PublishDeps } from './publish-steps.js';
 import { commentStep, gateCheckStep, gateFailure, setReviewOutputs } from './publish-steps.js';
@@ -53,6 +52,7 @@ export async function runReview(deps: PublishDeps): Promise<void> {
   );
   if (pr !== null) {
     // Inputs for a publish workflow, which recomputes the review on the trusted side.
+    const { writeBundle } = await import('../../io/bundle.js');
     await writeBundle(files.dir, result.runs, {
       format: 'fitgap-pull-request/1',
       repository: `${context.repo.owner}/${context.repo.repo}`,

@@ -1,2 +1,0 @@
-import { createRequire as __fitgapCreateRequire } from 'node:module'; const require = __fitgapCreateRequire(import.meta.url);
-import{a as o,e as n,f as e}from"./chunk-JHAKU6AE.js";import"./chunk-7F7LZESD.js";import"./chunk-CGJIVPM6.js";import{a as t}from"./chunk-F67OOH2X.js";var s=new o;function g(i,r,...c){let p=n.plugin(...c);return new p(e(i,r))}t(g,"getOctokit");export{s as context,g as getOctokit};
