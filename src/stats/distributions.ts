@@ -42,10 +42,28 @@ export function normalCdf(x: number): number {
   return Math.min(1, Math.max(0, jStat.normal.cdf(x, 0, 1)));
 }
 
+/**
+ * Quantiles already computed, by p (and df): a review asks for the same few (0.975 for every 95 %
+ * interval) hundreds of times, and jStat's inverses cost tens of microseconds each before the JIT
+ * has compiled them (145 calls of Φ⁻¹(0.975): 6 ms of a 0.1 s review). Pure functions: the cache
+ * changes no value. Cleared when it holds CACHE_SIZE entries.
+ */
+const quantiles = new Map<string, number>();
+const CACHE_SIZE = 256;
+
+function cached(key: string, compute: () => number): number {
+  const hit = quantiles.get(key);
+  if (hit !== undefined) return hit;
+  const value = compute();
+  if (quantiles.size >= CACHE_SIZE) quantiles.clear();
+  quantiles.set(key, value);
+  return value;
+}
+
 /** Standard normal quantile Φ⁻¹(p), p in (0, 1) (jStat, via erfc⁻¹). */
 export function normalQuantile(p: number): number {
   assertOpenProbability(p);
-  return jStat.normal.inv(p, 0, 1) + 0;
+  return cached(`n ${p}`, () => jStat.normal.inv(p, 0, 1) + 0);
 }
 
 /**
@@ -76,7 +94,7 @@ export function tQuantile(p: number, df: number): number {
   assertOpenProbability(p);
   assertDf(df);
   if (df > NORMAL_DF) return normalQuantile(p);
-  return jStat.studentt.inv(p, df) + 0;
+  return cached(`t ${p} ${df}`, () => jStat.studentt.inv(p, df) + 0);
 }
 
 /**

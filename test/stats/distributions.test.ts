@@ -1,3 +1,5 @@
+import fc from 'fast-check';
+import jStat from 'jstat';
 import { describe, expect, it } from 'vitest';
 import { binomialCdf, normalCdf, normalQuantile, tCdf, tQuantile } from '../../src/stats/index.js';
 import { expectNear, expectPrinted, expectRelative } from './close.js';
@@ -165,5 +167,30 @@ describe('binomialCdf', () => {
     expect(() => binomialCdf(1, -2, 0.5)).toThrow(RangeError);
     expect(() => binomialCdf(1, 2.5, 0.5)).toThrow(RangeError);
     expect(() => binomialCdf(1, 5, 1.5)).toThrow(RangeError);
+  });
+});
+
+describe('quantile cache', () => {
+  it('gives exactly what jStat gives, first and repeated calls, past the cache size (property)', () => {
+    // Source: jStat 1.9.6 (the reference library the quantiles come from): the cache must change no value.
+    fc.assert(
+      fc.property(
+        fc.array(
+          fc.tuple(
+            fc.double({ min: 1e-6, max: 1 - 1e-6, noNaN: true }),
+            fc.double({ min: 0.5, max: 1e4, noNaN: true }),
+          ),
+          { minLength: 1, maxLength: 300 },
+        ),
+        (cases) => {
+          for (let round = 0; round < 2; round++)
+            for (const [p, df] of cases) {
+              expect(normalQuantile(p)).toBe(jStat.normal.inv(p, 0, 1) + 0);
+              expect(tQuantile(p, df)).toBe(jStat.studentt.inv(p, df) + 0);
+            }
+        },
+      ),
+      { numRuns: 20 },
+    );
   });
 });
