@@ -325,8 +325,7 @@ export class Pairing {
   }
 
   flush(): void {
-    const { pending, diffs } = this;
-    for (let i = 0; i < this.pendingCount; i++) diffs.push(pending[i] as number);
+    this.diffs.pushAll(this.pending, this.pendingCount);
     this.pendingCount = 0;
   }
 }

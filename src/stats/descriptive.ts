@@ -59,6 +59,30 @@ export class RunningStats {
     this.#m2 += delta * (x - this.#mean);
   }
 
+  /**
+   * `push` of `values[0]` … `values[count − 1]` in order, the same arithmetic in one loop (a
+   * million values from a predictions file: no call per value).
+   */
+  pushAll(values: Float64Array, count: number): void {
+    let n = this.#n;
+    let mean = this.#mean;
+    let m2 = this.#m2;
+    try {
+      for (let i = 0; i < count; i++) {
+        const x = values[i] as number;
+        if (x - x !== 0) assertFinite('RunningStats value', x);
+        n += 1;
+        const delta = x - mean;
+        mean += delta / n;
+        m2 += delta * (x - mean);
+      }
+    } finally {
+      this.#n = n;
+      this.#mean = mean;
+      this.#m2 = m2;
+    }
+  }
+
   get n(): number {
     return this.#n;
   }

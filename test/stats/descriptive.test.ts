@@ -1,3 +1,4 @@
+import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { mean, RunningStats, sampleVariance } from '../../src/stats/index.js';
 import { expectNear } from './close.js';
@@ -62,5 +63,33 @@ describe('RunningStats', () => {
     for (let i = 0; i < n; i++) running.push(i % 10);
     expectNear(running.mean, 4.5, 1e-9);
     expectNear(running.variance, (8.25 * n) / (n - 1), 1e-8);
+  });
+});
+
+describe('RunningStats.pushAll', () => {
+  it('is push of each value in order, to the last bit, and stops at a non-finite value (property)', () => {
+    // Common practice: a batch form of an online update must be the same update, in the same order.
+    fc.assert(
+      fc.property(
+        fc.array(fc.double({ min: -1e6, max: 1e6, noNaN: true }), { maxLength: 60 }),
+        fc.array(fc.double({ min: -1e6, max: 1e6, noNaN: true }), { maxLength: 60 }),
+        fc.constantFrom(Number.NaN, Infinity, -Infinity, null),
+        (first, rest, bad) => {
+          const one = new RunningStats();
+          const all = new RunningStats();
+          const values = bad === null ? [...first, ...rest] : [...first, bad, ...rest];
+          let threw = false;
+          try {
+            for (const x of values) one.push(x);
+          } catch {
+            threw = true;
+          }
+          const run = (): void => all.pushAll(Float64Array.from(values), values.length);
+          if (threw) expect(run).toThrow(RangeError);
+          else expect(run).not.toThrow();
+          expect([all.n, all.mean, all.variance]).toEqual([one.n, one.mean, one.variance]);
+        },
+      ),
+    );
   });
 });
