@@ -50,17 +50,7 @@ export function generalizationLoss(validation: readonly number[]): number[] {
 
 /** P_k(t) for every t, in per mille; null for t < k − 1. */
 export function trainingProgress(train: readonly number[], k = STRIP): (number | null)[] {
-  return train.map((_, t) => {
-    if (t < k - 1) return null;
-    let sum = 0;
-    let min = Infinity;
-    for (let i = t - k + 1; i <= t; i++) {
-      sum += train[i] as number;
-      min = Math.min(min, train[i] as number);
-    }
-    if (min === 0) return sum === 0 ? 0 : Infinity;
-    return 1000 * (sum / (k * min) - 1);
-  });
+  return train.map((_, t) => (t < k - 1 ? null : windowProgress(train, t, k)));
 }
 
 /** PQ(t) = GL(t)/P_k(t) at strip ends, null elsewhere. P_k = 0 gives +∞ (or 0 when GL = 0). */
