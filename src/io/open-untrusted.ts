@@ -377,7 +377,7 @@ export async function bytesChecked(target: UntrustedFile): Promise<CheckedBytes>
         return 0;
       }
       ended = true;
-      if ((await readAt(target, file.handle, Buffer.alloc(1), at)) > 0) grew(target);
+      if (readAtNow(target, file.handle, Buffer.alloc(1), at) > 0) grew(target);
       return 0;
     },
     close,
