@@ -14,6 +14,7 @@
  * need (λ ≈ 80 at ν = 1). Accuracy against SciPy's `nct` is checked in test/stats/power.test.ts.
  */
 import jStat from 'jstat';
+import { illinois } from './bracket-root.js';
 import { normalCdf, normalQuantile, tQuantile } from './distributions.js';
 
 /** Above this df the t is the normal (as in distributions.ts). */
@@ -87,7 +88,7 @@ export function tTestPower(ncp: number, df: number, alpha: number): number {
  * The noncentrality λ > 0 at which `tTestPower` reaches `power` (power rises with λ). The smallest
  * detectable effect is then λ × the standard error. Bracketed from the Student-quantile
  * approximation t(1 − α/2; ν) + t(power; ν), then solved by the Illinois variant of regula falsi
- * (common practice) to 1e-10 relative.
+ * (`bracket-root.ts`) to 1e-10 relative.
  */
 export function noncentralityFor(power: number, df: number, alpha: number): number {
   if (!(power > alpha / 2 && power < 1)) {
@@ -114,22 +115,7 @@ export function noncentralityFor(power: number, df: number, alpha: number): numb
     if (b > 1e8) throw new RangeError('power cannot be reached');
     fb = f(b);
   }
-  let side = 0;
-  for (let i = 0; i < 100 && b - a > 1e-10 * b; i++) {
-    const c = (a * fb - b * fa) / (fb - fa);
-    const fc = f(c);
-    if (fc === 0) return c;
-    if (fc < 0) {
-      a = c;
-      fa = fc;
-      if (side === -1) fb /= 2;
-      side = -1;
-    } else {
-      b = c;
-      fb = fc;
-      if (side === 1) fa /= 2;
-      side = 1;
-    }
-  }
-  return (a + b) / 2;
+  if (fa === 0) return a;
+  const root = illinois(f, a, fa, b, fb, 1e-10, 100);
+  return (root.lo + root.hi) / 2;
 }

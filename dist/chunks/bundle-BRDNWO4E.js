@@ -1,2 +1,0 @@
-import { createRequire as __fitgapCreateRequire } from 'node:module'; const require = __fitgapCreateRequire(import.meta.url);
-import{a as e,b as f,c as g,d as h}from"./chunk-K7WOFENH.js";import{a,b,c,d}from"./chunk-SZDTB7LH.js";import"./chunk-K27MFGL3.js";import"./chunk-6Q77KV5Y.js";import"./chunk-BWO3RSUZ.js";import"./chunk-ZGDVYQ3H.js";import"./chunk-DUOFI3TR.js";import"./chunk-F67OOH2X.js";export{d as PREDICTIONS_FILE,b as PULL_REQUEST_FILE,a as REVIEW_FILE,c as RUN_FILE,e as SIDES,h as extractBundle,f as parsePullRequestNote,g as writeBundle};
