@@ -45,8 +45,11 @@ const targets = [
     name: 'run-schema',
     from: 'schema/fitgap-run-1.schema.json',
     schema: json('schema/fitgap-run-1.schema.json'),
-    // The options src/validate/run.ts compiled it with.
-    ajv: () => new Ajv2020({ allErrors: true, strict: true, strictNumbers: true, code }),
+    // The options src/validate/run.ts compiled it with, and inlineRefs: false: the split and curve
+    // definitions become one function each instead of one copy per use (93 KB of code to compile
+    // instead of 139 KB; the errors are the same).
+    ajv: () =>
+      new Ajv2020({ allErrors: true, strict: true, strictNumbers: true, inlineRefs: false, code }),
     formats: ['date-time'],
   },
   {

@@ -18,9 +18,9 @@ function ucs2length(str) {
   }
   return length;
 }
-export const validate = validate20;
-export default validate20;
-const schema31 = {
+export const validate = validate52;
+export default validate52;
+const schema19 = {
   $schema: 'https://json-schema.org/draft/2020-12/schema',
   $id: 'https://fitgap.dev/schema/fitgap-run-1.schema.json',
   title: 'fitgap run artifact, format 1',
@@ -243,7 +243,10 @@ const schema31 = {
     },
   },
 };
-const schema32 = {
+const func1 = Object.prototype.hasOwnProperty;
+const func2 = ucs2length;
+const formats0 = formats['date-time'];
+const schema20 = {
   type: 'object',
   required: ['values'],
   additionalProperties: false,
@@ -257,7 +260,178 @@ const schema32 = {
     },
   },
 };
-const schema36 = {
+function validate53(
+  data,
+  { instancePath = '', parentData, parentDataProperty, rootData = data, dynamicAnchors = {} } = {},
+) {
+  let vErrors = null;
+  let errors = 0;
+  const evaluated0 = validate53.evaluated;
+  if (evaluated0.dynamicProps) {
+    evaluated0.props = undefined;
+  }
+  if (evaluated0.dynamicItems) {
+    evaluated0.items = undefined;
+  }
+  if (data && typeof data == 'object' && !Array.isArray(data)) {
+    if (data.values === undefined) {
+      const err0 = {
+        instancePath,
+        schemaPath: '#/required',
+        keyword: 'required',
+        params: { missingProperty: 'values' },
+        message: "must have required property '" + 'values' + "'",
+      };
+      if (vErrors === null) {
+        vErrors = [err0];
+      } else {
+        vErrors.push(err0);
+      }
+      errors++;
+    }
+    for (const key0 in data) {
+      if (!(key0 === 'examples' || key0 === 'values' || key0 === 'evaluationRows')) {
+        const err1 = {
+          instancePath,
+          schemaPath: '#/additionalProperties',
+          keyword: 'additionalProperties',
+          params: { additionalProperty: key0 },
+          message: 'must NOT have additional properties',
+        };
+        if (vErrors === null) {
+          vErrors = [err1];
+        } else {
+          vErrors.push(err1);
+        }
+        errors++;
+      }
+    }
+    if (data.examples !== undefined) {
+      let data0 = data.examples;
+      if (!(typeof data0 == 'number' && !(data0 % 1) && !isNaN(data0) && isFinite(data0))) {
+        const err2 = {
+          instancePath: instancePath + '/examples',
+          schemaPath: '#/properties/examples/type',
+          keyword: 'type',
+          params: { type: 'integer' },
+          message: 'must be integer',
+        };
+        if (vErrors === null) {
+          vErrors = [err2];
+        } else {
+          vErrors.push(err2);
+        }
+        errors++;
+      }
+      if (typeof data0 == 'number' && isFinite(data0)) {
+        if (data0 < 1 || isNaN(data0)) {
+          const err3 = {
+            instancePath: instancePath + '/examples',
+            schemaPath: '#/properties/examples/minimum',
+            keyword: 'minimum',
+            params: { comparison: '>=', limit: 1 },
+            message: 'must be >= 1',
+          };
+          if (vErrors === null) {
+            vErrors = [err3];
+          } else {
+            vErrors.push(err3);
+          }
+          errors++;
+        }
+      }
+    }
+    if (data.values !== undefined) {
+      let data1 = data.values;
+      if (Array.isArray(data1)) {
+        if (data1.length < 1) {
+          const err4 = {
+            instancePath: instancePath + '/values',
+            schemaPath: '#/properties/values/minItems',
+            keyword: 'minItems',
+            params: { limit: 1 },
+            message: 'must NOT have fewer than 1 items',
+          };
+          if (vErrors === null) {
+            vErrors = [err4];
+          } else {
+            vErrors.push(err4);
+          }
+          errors++;
+        }
+        const len0 = data1.length;
+        for (let i0 = 0; i0 < len0; i0++) {
+          let data2 = data1[i0];
+          if (!(typeof data2 == 'number' && isFinite(data2))) {
+            const err5 = {
+              instancePath: instancePath + '/values/' + i0,
+              schemaPath: '#/properties/values/items/type',
+              keyword: 'type',
+              params: { type: 'number' },
+              message: 'must be number',
+            };
+            if (vErrors === null) {
+              vErrors = [err5];
+            } else {
+              vErrors.push(err5);
+            }
+            errors++;
+          }
+        }
+      } else {
+        const err6 = {
+          instancePath: instancePath + '/values',
+          schemaPath: '#/properties/values/type',
+          keyword: 'type',
+          params: { type: 'array' },
+          message: 'must be array',
+        };
+        if (vErrors === null) {
+          vErrors = [err6];
+        } else {
+          vErrors.push(err6);
+        }
+        errors++;
+      }
+    }
+    if (data.evaluationRows !== undefined) {
+      let data3 = data.evaluationRows;
+      if (!(data3 === 'fixed' || data3 === 'per-repeat')) {
+        const err7 = {
+          instancePath: instancePath + '/evaluationRows',
+          schemaPath: '#/properties/evaluationRows/enum',
+          keyword: 'enum',
+          params: { allowedValues: schema20.properties.evaluationRows.enum },
+          message: 'must be equal to one of the allowed values',
+        };
+        if (vErrors === null) {
+          vErrors = [err7];
+        } else {
+          vErrors.push(err7);
+        }
+        errors++;
+      }
+    }
+  } else {
+    const err8 = {
+      instancePath,
+      schemaPath: '#/type',
+      keyword: 'type',
+      params: { type: 'object' },
+      message: 'must be object',
+    };
+    if (vErrors === null) {
+      vErrors = [err8];
+    } else {
+      vErrors.push(err8);
+    }
+    errors++;
+  }
+  validate53.errors = vErrors;
+  return errors === 0;
+}
+validate53.evaluated = { props: true, dynamicProps: false, dynamicItems: false };
+const schema21 = {
   type: 'array',
   minItems: 1,
   items: {
@@ -271,16 +445,182 @@ const schema36 = {
     },
   },
 };
-const func1 = Object.prototype.hasOwnProperty;
-const func2 = ucs2length;
-const formats0 = formats['date-time'];
-function validate20(
+function validate58(
+  data,
+  { instancePath = '', parentData, parentDataProperty, rootData = data, dynamicAnchors = {} } = {},
+) {
+  let vErrors = null;
+  let errors = 0;
+  const evaluated0 = validate58.evaluated;
+  if (evaluated0.dynamicProps) {
+    evaluated0.props = undefined;
+  }
+  if (evaluated0.dynamicItems) {
+    evaluated0.items = undefined;
+  }
+  if (Array.isArray(data)) {
+    if (data.length < 1) {
+      const err0 = {
+        instancePath,
+        schemaPath: '#/minItems',
+        keyword: 'minItems',
+        params: { limit: 1 },
+        message: 'must NOT have fewer than 1 items',
+      };
+      if (vErrors === null) {
+        vErrors = [err0];
+      } else {
+        vErrors.push(err0);
+      }
+      errors++;
+    }
+    const len0 = data.length;
+    for (let i0 = 0; i0 < len0; i0++) {
+      let data0 = data[i0];
+      if (data0 && typeof data0 == 'object' && !Array.isArray(data0)) {
+        if (data0.x === undefined) {
+          const err1 = {
+            instancePath: instancePath + '/' + i0,
+            schemaPath: '#/items/required',
+            keyword: 'required',
+            params: { missingProperty: 'x' },
+            message: "must have required property '" + 'x' + "'",
+          };
+          if (vErrors === null) {
+            vErrors = [err1];
+          } else {
+            vErrors.push(err1);
+          }
+          errors++;
+        }
+        if (data0.validation === undefined) {
+          const err2 = {
+            instancePath: instancePath + '/' + i0,
+            schemaPath: '#/items/required',
+            keyword: 'required',
+            params: { missingProperty: 'validation' },
+            message: "must have required property '" + 'validation' + "'",
+          };
+          if (vErrors === null) {
+            vErrors = [err2];
+          } else {
+            vErrors.push(err2);
+          }
+          errors++;
+        }
+        for (const key0 in data0) {
+          if (!(key0 === 'x' || key0 === 'train' || key0 === 'validation')) {
+            const err3 = {
+              instancePath: instancePath + '/' + i0,
+              schemaPath: '#/items/additionalProperties',
+              keyword: 'additionalProperties',
+              params: { additionalProperty: key0 },
+              message: 'must NOT have additional properties',
+            };
+            if (vErrors === null) {
+              vErrors = [err3];
+            } else {
+              vErrors.push(err3);
+            }
+            errors++;
+          }
+        }
+        if (data0.x !== undefined) {
+          let data1 = data0.x;
+          if (!(typeof data1 == 'number' && isFinite(data1))) {
+            const err4 = {
+              instancePath: instancePath + '/' + i0 + '/x',
+              schemaPath: '#/items/properties/x/type',
+              keyword: 'type',
+              params: { type: 'number' },
+              message: 'must be number',
+            };
+            if (vErrors === null) {
+              vErrors = [err4];
+            } else {
+              vErrors.push(err4);
+            }
+            errors++;
+          }
+        }
+        if (data0.train !== undefined) {
+          let data2 = data0.train;
+          if (!(typeof data2 == 'number' && isFinite(data2))) {
+            const err5 = {
+              instancePath: instancePath + '/' + i0 + '/train',
+              schemaPath: '#/items/properties/train/type',
+              keyword: 'type',
+              params: { type: 'number' },
+              message: 'must be number',
+            };
+            if (vErrors === null) {
+              vErrors = [err5];
+            } else {
+              vErrors.push(err5);
+            }
+            errors++;
+          }
+        }
+        if (data0.validation !== undefined) {
+          let data3 = data0.validation;
+          if (!(typeof data3 == 'number' && isFinite(data3))) {
+            const err6 = {
+              instancePath: instancePath + '/' + i0 + '/validation',
+              schemaPath: '#/items/properties/validation/type',
+              keyword: 'type',
+              params: { type: 'number' },
+              message: 'must be number',
+            };
+            if (vErrors === null) {
+              vErrors = [err6];
+            } else {
+              vErrors.push(err6);
+            }
+            errors++;
+          }
+        }
+      } else {
+        const err7 = {
+          instancePath: instancePath + '/' + i0,
+          schemaPath: '#/items/type',
+          keyword: 'type',
+          params: { type: 'object' },
+          message: 'must be object',
+        };
+        if (vErrors === null) {
+          vErrors = [err7];
+        } else {
+          vErrors.push(err7);
+        }
+        errors++;
+      }
+    }
+  } else {
+    const err8 = {
+      instancePath,
+      schemaPath: '#/type',
+      keyword: 'type',
+      params: { type: 'array' },
+      message: 'must be array',
+    };
+    if (vErrors === null) {
+      vErrors = [err8];
+    } else {
+      vErrors.push(err8);
+    }
+    errors++;
+  }
+  validate58.errors = vErrors;
+  return errors === 0;
+}
+validate58.evaluated = { items: true, dynamicProps: false, dynamicItems: false };
+function validate52(
   data,
   { instancePath = '', parentData, parentDataProperty, rootData = data, dynamicAnchors = {} } = {},
 ) {
   /*# sourceURL="https://fitgap.dev/schema/fitgap-run-1.schema.json" */ let vErrors = null;
   let errors = 0;
-  const evaluated0 = validate20.evaluated;
+  const evaluated0 = validate52.evaluated;
   if (evaluated0.dynamicProps) {
     evaluated0.props = undefined;
   }
@@ -349,7 +689,7 @@ function validate20(
       errors++;
     }
     for (const key0 in data) {
-      if (!func1.call(schema31.properties, key0)) {
+      if (!func1.call(schema19.properties, key0)) {
         const err4 = {
           instancePath,
           schemaPath: '#/additionalProperties',
@@ -709,7 +1049,7 @@ function validate20(
               instancePath: instancePath + '/metric/goal',
               schemaPath: '#/properties/metric/properties/goal/enum',
               keyword: 'enum',
-              params: { allowedValues: schema31.properties.metric.properties.goal.enum },
+              params: { allowedValues: schema19.properties.metric.properties.goal.enum },
               message: 'must be equal to one of the allowed values',
             };
             if (vErrors === null) {
@@ -727,7 +1067,7 @@ function validate20(
               instancePath: instancePath + '/metric/kind',
               schemaPath: '#/properties/metric/properties/kind/enum',
               keyword: 'enum',
-              params: { allowedValues: schema31.properties.metric.properties.kind.enum },
+              params: { allowedValues: schema19.properties.metric.properties.kind.enum },
               message: 'must be equal to one of the allowed values',
             };
             if (vErrors === null) {
@@ -895,124 +1235,243 @@ function validate20(
           }
         }
         if (data13.train !== undefined) {
-          let data14 = data13.train;
-          if (data14 && typeof data14 == 'object' && !Array.isArray(data14)) {
-            if (data14.values === undefined) {
-              const err36 = {
-                instancePath: instancePath + '/splits/train',
-                schemaPath: '#/$defs/split/required',
-                keyword: 'required',
-                params: { missingProperty: 'values' },
-                message: "must have required property '" + 'values' + "'",
-              };
-              if (vErrors === null) {
-                vErrors = [err36];
-              } else {
-                vErrors.push(err36);
-              }
-              errors++;
+          if (
+            !validate53(data13.train, {
+              instancePath: instancePath + '/splits/train',
+              parentData: data13,
+              parentDataProperty: 'train',
+              rootData,
+              dynamicAnchors,
+            })
+          ) {
+            vErrors = vErrors === null ? validate53.errors : vErrors.concat(validate53.errors);
+            errors = vErrors.length;
+          }
+        }
+        if (data13.train_dev !== undefined) {
+          if (
+            !validate53(data13.train_dev, {
+              instancePath: instancePath + '/splits/train_dev',
+              parentData: data13,
+              parentDataProperty: 'train_dev',
+              rootData,
+              dynamicAnchors,
+            })
+          ) {
+            vErrors = vErrors === null ? validate53.errors : vErrors.concat(validate53.errors);
+            errors = vErrors.length;
+          }
+        }
+        if (data13.validation !== undefined) {
+          if (
+            !validate53(data13.validation, {
+              instancePath: instancePath + '/splits/validation',
+              parentData: data13,
+              parentDataProperty: 'validation',
+              rootData,
+              dynamicAnchors,
+            })
+          ) {
+            vErrors = vErrors === null ? validate53.errors : vErrors.concat(validate53.errors);
+            errors = vErrors.length;
+          }
+        }
+        if (data13.test !== undefined) {
+          if (
+            !validate53(data13.test, {
+              instancePath: instancePath + '/splits/test',
+              parentData: data13,
+              parentDataProperty: 'test',
+              rootData,
+              dynamicAnchors,
+            })
+          ) {
+            vErrors = vErrors === null ? validate53.errors : vErrors.concat(validate53.errors);
+            errors = vErrors.length;
+          }
+        }
+      } else {
+        const err36 = {
+          instancePath: instancePath + '/splits',
+          schemaPath: '#/properties/splits/type',
+          keyword: 'type',
+          params: { type: 'object' },
+          message: 'must be object',
+        };
+        if (vErrors === null) {
+          vErrors = [err36];
+        } else {
+          vErrors.push(err36);
+        }
+        errors++;
+      }
+    }
+    if (data.hyperparameters !== undefined) {
+      let data18 = data.hyperparameters;
+      if (!(data18 && typeof data18 == 'object' && !Array.isArray(data18))) {
+        const err37 = {
+          instancePath: instancePath + '/hyperparameters',
+          schemaPath: '#/properties/hyperparameters/type',
+          keyword: 'type',
+          params: { type: 'object' },
+          message: 'must be object',
+        };
+        if (vErrors === null) {
+          vErrors = [err37];
+        } else {
+          vErrors.push(err37);
+        }
+        errors++;
+      }
+    }
+    if (data.curves !== undefined) {
+      let data19 = data.curves;
+      if (data19 && typeof data19 == 'object' && !Array.isArray(data19)) {
+        for (const key4 in data19) {
+          if (!(
+            key4 === 'epochs' ||
+            key4 === 'training_examples' ||
+            key4 === 'regularization' ||
+            key4 === 'sources'
+          )) {
+            const err38 = {
+              instancePath: instancePath + '/curves',
+              schemaPath: '#/properties/curves/additionalProperties',
+              keyword: 'additionalProperties',
+              params: { additionalProperty: key4 },
+              message: 'must NOT have additional properties',
+            };
+            if (vErrors === null) {
+              vErrors = [err38];
+            } else {
+              vErrors.push(err38);
             }
-            for (const key4 in data14) {
-              if (!(key4 === 'examples' || key4 === 'values' || key4 === 'evaluationRows')) {
-                const err37 = {
-                  instancePath: instancePath + '/splits/train',
-                  schemaPath: '#/$defs/split/additionalProperties',
+            errors++;
+          }
+        }
+        if (data19.epochs !== undefined) {
+          if (
+            !validate58(data19.epochs, {
+              instancePath: instancePath + '/curves/epochs',
+              parentData: data19,
+              parentDataProperty: 'epochs',
+              rootData,
+              dynamicAnchors,
+            })
+          ) {
+            vErrors = vErrors === null ? validate58.errors : vErrors.concat(validate58.errors);
+            errors = vErrors.length;
+          }
+        }
+        if (data19.training_examples !== undefined) {
+          if (
+            !validate58(data19.training_examples, {
+              instancePath: instancePath + '/curves/training_examples',
+              parentData: data19,
+              parentDataProperty: 'training_examples',
+              rootData,
+              dynamicAnchors,
+            })
+          ) {
+            vErrors = vErrors === null ? validate58.errors : vErrors.concat(validate58.errors);
+            errors = vErrors.length;
+          }
+        }
+        if (data19.regularization !== undefined) {
+          if (
+            !validate58(data19.regularization, {
+              instancePath: instancePath + '/curves/regularization',
+              parentData: data19,
+              parentDataProperty: 'regularization',
+              rootData,
+              dynamicAnchors,
+            })
+          ) {
+            vErrors = vErrors === null ? validate58.errors : vErrors.concat(validate58.errors);
+            errors = vErrors.length;
+          }
+        }
+        if (data19.sources !== undefined) {
+          let data23 = data19.sources;
+          if (data23 && typeof data23 == 'object' && !Array.isArray(data23)) {
+            for (const key5 in data23) {
+              if (!(
+                key5 === 'epochs' ||
+                key5 === 'training_examples' ||
+                key5 === 'regularization'
+              )) {
+                const err39 = {
+                  instancePath: instancePath + '/curves/sources',
+                  schemaPath: '#/properties/curves/properties/sources/additionalProperties',
                   keyword: 'additionalProperties',
-                  params: { additionalProperty: key4 },
+                  params: { additionalProperty: key5 },
                   message: 'must NOT have additional properties',
                 };
                 if (vErrors === null) {
-                  vErrors = [err37];
+                  vErrors = [err39];
                 } else {
-                  vErrors.push(err37);
+                  vErrors.push(err39);
                 }
                 errors++;
               }
             }
-            if (data14.examples !== undefined) {
-              let data15 = data14.examples;
-              if (!(
-                typeof data15 == 'number' &&
-                !(data15 % 1) &&
-                !isNaN(data15) &&
-                isFinite(data15)
-              )) {
-                const err38 = {
-                  instancePath: instancePath + '/splits/train/examples',
-                  schemaPath: '#/$defs/split/properties/examples/type',
-                  keyword: 'type',
-                  params: { type: 'integer' },
-                  message: 'must be integer',
+            if (data23.epochs !== undefined) {
+              let data24 = data23.epochs;
+              if (!(data24 === 'held-out' || data24 === 'cross-validation')) {
+                const err40 = {
+                  instancePath: instancePath + '/curves/sources/epochs',
+                  schemaPath: '#/properties/curves/properties/sources/properties/epochs/enum',
+                  keyword: 'enum',
+                  params: {
+                    allowedValues:
+                      schema19.properties.curves.properties.sources.properties.epochs.enum,
+                  },
+                  message: 'must be equal to one of the allowed values',
                 };
                 if (vErrors === null) {
-                  vErrors = [err38];
+                  vErrors = [err40];
                 } else {
-                  vErrors.push(err38);
+                  vErrors.push(err40);
                 }
                 errors++;
               }
-              if (typeof data15 == 'number' && isFinite(data15)) {
-                if (data15 < 1 || isNaN(data15)) {
-                  const err39 = {
-                    instancePath: instancePath + '/splits/train/examples',
-                    schemaPath: '#/$defs/split/properties/examples/minimum',
-                    keyword: 'minimum',
-                    params: { comparison: '>=', limit: 1 },
-                    message: 'must be >= 1',
-                  };
-                  if (vErrors === null) {
-                    vErrors = [err39];
-                  } else {
-                    vErrors.push(err39);
-                  }
-                  errors++;
+            }
+            if (data23.training_examples !== undefined) {
+              let data25 = data23.training_examples;
+              if (!(data25 === 'held-out' || data25 === 'cross-validation')) {
+                const err41 = {
+                  instancePath: instancePath + '/curves/sources/training_examples',
+                  schemaPath:
+                    '#/properties/curves/properties/sources/properties/training_examples/enum',
+                  keyword: 'enum',
+                  params: {
+                    allowedValues:
+                      schema19.properties.curves.properties.sources.properties.training_examples
+                        .enum,
+                  },
+                  message: 'must be equal to one of the allowed values',
+                };
+                if (vErrors === null) {
+                  vErrors = [err41];
+                } else {
+                  vErrors.push(err41);
                 }
+                errors++;
               }
             }
-            if (data14.values !== undefined) {
-              let data16 = data14.values;
-              if (Array.isArray(data16)) {
-                if (data16.length < 1) {
-                  const err40 = {
-                    instancePath: instancePath + '/splits/train/values',
-                    schemaPath: '#/$defs/split/properties/values/minItems',
-                    keyword: 'minItems',
-                    params: { limit: 1 },
-                    message: 'must NOT have fewer than 1 items',
-                  };
-                  if (vErrors === null) {
-                    vErrors = [err40];
-                  } else {
-                    vErrors.push(err40);
-                  }
-                  errors++;
-                }
-                const len0 = data16.length;
-                for (let i0 = 0; i0 < len0; i0++) {
-                  let data17 = data16[i0];
-                  if (!(typeof data17 == 'number' && isFinite(data17))) {
-                    const err41 = {
-                      instancePath: instancePath + '/splits/train/values/' + i0,
-                      schemaPath: '#/$defs/split/properties/values/items/type',
-                      keyword: 'type',
-                      params: { type: 'number' },
-                      message: 'must be number',
-                    };
-                    if (vErrors === null) {
-                      vErrors = [err41];
-                    } else {
-                      vErrors.push(err41);
-                    }
-                    errors++;
-                  }
-                }
-              } else {
+            if (data23.regularization !== undefined) {
+              let data26 = data23.regularization;
+              if (!(data26 === 'held-out' || data26 === 'cross-validation')) {
                 const err42 = {
-                  instancePath: instancePath + '/splits/train/values',
-                  schemaPath: '#/$defs/split/properties/values/type',
-                  keyword: 'type',
-                  params: { type: 'array' },
-                  message: 'must be array',
+                  instancePath: instancePath + '/curves/sources/regularization',
+                  schemaPath:
+                    '#/properties/curves/properties/sources/properties/regularization/enum',
+                  keyword: 'enum',
+                  params: {
+                    allowedValues:
+                      schema19.properties.curves.properties.sources.properties.regularization.enum,
+                  },
+                  message: 'must be equal to one of the allowed values',
                 };
                 if (vErrors === null) {
                   vErrors = [err42];
@@ -1022,50 +1481,52 @@ function validate20(
                 errors++;
               }
             }
-            if (data14.evaluationRows !== undefined) {
-              let data18 = data14.evaluationRows;
-              if (!(data18 === 'fixed' || data18 === 'per-repeat')) {
-                const err43 = {
-                  instancePath: instancePath + '/splits/train/evaluationRows',
-                  schemaPath: '#/$defs/split/properties/evaluationRows/enum',
-                  keyword: 'enum',
-                  params: { allowedValues: schema32.properties.evaluationRows.enum },
-                  message: 'must be equal to one of the allowed values',
-                };
-                if (vErrors === null) {
-                  vErrors = [err43];
-                } else {
-                  vErrors.push(err43);
-                }
-                errors++;
-              }
-            }
           } else {
-            const err44 = {
-              instancePath: instancePath + '/splits/train',
-              schemaPath: '#/$defs/split/type',
+            const err43 = {
+              instancePath: instancePath + '/curves/sources',
+              schemaPath: '#/properties/curves/properties/sources/type',
               keyword: 'type',
               params: { type: 'object' },
               message: 'must be object',
             };
             if (vErrors === null) {
-              vErrors = [err44];
+              vErrors = [err43];
             } else {
-              vErrors.push(err44);
+              vErrors.push(err43);
             }
             errors++;
           }
         }
-        if (data13.train_dev !== undefined) {
-          let data19 = data13.train_dev;
-          if (data19 && typeof data19 == 'object' && !Array.isArray(data19)) {
-            if (data19.values === undefined) {
+      } else {
+        const err44 = {
+          instancePath: instancePath + '/curves',
+          schemaPath: '#/properties/curves/type',
+          keyword: 'type',
+          params: { type: 'object' },
+          message: 'must be object',
+        };
+        if (vErrors === null) {
+          vErrors = [err44];
+        } else {
+          vErrors.push(err44);
+        }
+        errors++;
+      }
+    }
+    if (data.slices !== undefined) {
+      let data27 = data.slices;
+      if (Array.isArray(data27)) {
+        const len0 = data27.length;
+        for (let i0 = 0; i0 < len0; i0++) {
+          let data28 = data27[i0];
+          if (data28 && typeof data28 == 'object' && !Array.isArray(data28)) {
+            if (data28.name === undefined) {
               const err45 = {
-                instancePath: instancePath + '/splits/train_dev',
-                schemaPath: '#/$defs/split/required',
+                instancePath: instancePath + '/slices/' + i0,
+                schemaPath: '#/properties/slices/items/required',
                 keyword: 'required',
-                params: { missingProperty: 'values' },
-                message: "must have required property '" + 'values' + "'",
+                params: { missingProperty: 'name' },
+                message: "must have required property '" + 'name' + "'",
               };
               if (vErrors === null) {
                 vErrors = [err45];
@@ -1074,37 +1535,34 @@ function validate20(
               }
               errors++;
             }
-            for (const key5 in data19) {
-              if (!(key5 === 'examples' || key5 === 'values' || key5 === 'evaluationRows')) {
-                const err46 = {
-                  instancePath: instancePath + '/splits/train_dev',
-                  schemaPath: '#/$defs/split/additionalProperties',
-                  keyword: 'additionalProperties',
-                  params: { additionalProperty: key5 },
-                  message: 'must NOT have additional properties',
-                };
-                if (vErrors === null) {
-                  vErrors = [err46];
-                } else {
-                  vErrors.push(err46);
-                }
-                errors++;
+            if (data28.validation === undefined) {
+              const err46 = {
+                instancePath: instancePath + '/slices/' + i0,
+                schemaPath: '#/properties/slices/items/required',
+                keyword: 'required',
+                params: { missingProperty: 'validation' },
+                message: "must have required property '" + 'validation' + "'",
+              };
+              if (vErrors === null) {
+                vErrors = [err46];
+              } else {
+                vErrors.push(err46);
               }
+              errors++;
             }
-            if (data19.examples !== undefined) {
-              let data20 = data19.examples;
+            for (const key6 in data28) {
               if (!(
-                typeof data20 == 'number' &&
-                !(data20 % 1) &&
-                !isNaN(data20) &&
-                isFinite(data20)
+                key6 === 'name' ||
+                key6 === 'examples' ||
+                key6 === 'train' ||
+                key6 === 'validation'
               )) {
                 const err47 = {
-                  instancePath: instancePath + '/splits/train_dev/examples',
-                  schemaPath: '#/$defs/split/properties/examples/type',
-                  keyword: 'type',
-                  params: { type: 'integer' },
-                  message: 'must be integer',
+                  instancePath: instancePath + '/slices/' + i0,
+                  schemaPath: '#/properties/slices/items/additionalProperties',
+                  keyword: 'additionalProperties',
+                  params: { additionalProperty: key6 },
+                  message: 'must NOT have additional properties',
                 };
                 if (vErrors === null) {
                   vErrors = [err47];
@@ -1113,14 +1571,17 @@ function validate20(
                 }
                 errors++;
               }
-              if (typeof data20 == 'number' && isFinite(data20)) {
-                if (data20 < 1 || isNaN(data20)) {
+            }
+            if (data28.name !== undefined) {
+              let data29 = data28.name;
+              if (typeof data29 === 'string') {
+                if (func2(data29) < 1) {
                   const err48 = {
-                    instancePath: instancePath + '/splits/train_dev/examples',
-                    schemaPath: '#/$defs/split/properties/examples/minimum',
-                    keyword: 'minimum',
-                    params: { comparison: '>=', limit: 1 },
-                    message: 'must be >= 1',
+                    instancePath: instancePath + '/slices/' + i0 + '/name',
+                    schemaPath: '#/properties/slices/items/properties/name/minLength',
+                    keyword: 'minLength',
+                    params: { limit: 1 },
+                    message: 'must NOT have fewer than 1 characters',
                   };
                   if (vErrors === null) {
                     vErrors = [err48];
@@ -1129,70 +1590,71 @@ function validate20(
                   }
                   errors++;
                 }
-              }
-            }
-            if (data19.values !== undefined) {
-              let data21 = data19.values;
-              if (Array.isArray(data21)) {
-                if (data21.length < 1) {
-                  const err49 = {
-                    instancePath: instancePath + '/splits/train_dev/values',
-                    schemaPath: '#/$defs/split/properties/values/minItems',
-                    keyword: 'minItems',
-                    params: { limit: 1 },
-                    message: 'must NOT have fewer than 1 items',
-                  };
-                  if (vErrors === null) {
-                    vErrors = [err49];
-                  } else {
-                    vErrors.push(err49);
-                  }
-                  errors++;
-                }
-                const len1 = data21.length;
-                for (let i1 = 0; i1 < len1; i1++) {
-                  let data22 = data21[i1];
-                  if (!(typeof data22 == 'number' && isFinite(data22))) {
-                    const err50 = {
-                      instancePath: instancePath + '/splits/train_dev/values/' + i1,
-                      schemaPath: '#/$defs/split/properties/values/items/type',
-                      keyword: 'type',
-                      params: { type: 'number' },
-                      message: 'must be number',
-                    };
-                    if (vErrors === null) {
-                      vErrors = [err50];
-                    } else {
-                      vErrors.push(err50);
-                    }
-                    errors++;
-                  }
-                }
               } else {
-                const err51 = {
-                  instancePath: instancePath + '/splits/train_dev/values',
-                  schemaPath: '#/$defs/split/properties/values/type',
+                const err49 = {
+                  instancePath: instancePath + '/slices/' + i0 + '/name',
+                  schemaPath: '#/properties/slices/items/properties/name/type',
                   keyword: 'type',
-                  params: { type: 'array' },
-                  message: 'must be array',
+                  params: { type: 'string' },
+                  message: 'must be string',
                 };
                 if (vErrors === null) {
-                  vErrors = [err51];
+                  vErrors = [err49];
                 } else {
-                  vErrors.push(err51);
+                  vErrors.push(err49);
                 }
                 errors++;
               }
             }
-            if (data19.evaluationRows !== undefined) {
-              let data23 = data19.evaluationRows;
-              if (!(data23 === 'fixed' || data23 === 'per-repeat')) {
+            if (data28.examples !== undefined) {
+              let data30 = data28.examples;
+              if (!(
+                typeof data30 == 'number' &&
+                !(data30 % 1) &&
+                !isNaN(data30) &&
+                isFinite(data30)
+              )) {
+                const err50 = {
+                  instancePath: instancePath + '/slices/' + i0 + '/examples',
+                  schemaPath: '#/properties/slices/items/properties/examples/type',
+                  keyword: 'type',
+                  params: { type: 'integer' },
+                  message: 'must be integer',
+                };
+                if (vErrors === null) {
+                  vErrors = [err50];
+                } else {
+                  vErrors.push(err50);
+                }
+                errors++;
+              }
+              if (typeof data30 == 'number' && isFinite(data30)) {
+                if (data30 < 1 || isNaN(data30)) {
+                  const err51 = {
+                    instancePath: instancePath + '/slices/' + i0 + '/examples',
+                    schemaPath: '#/properties/slices/items/properties/examples/minimum',
+                    keyword: 'minimum',
+                    params: { comparison: '>=', limit: 1 },
+                    message: 'must be >= 1',
+                  };
+                  if (vErrors === null) {
+                    vErrors = [err51];
+                  } else {
+                    vErrors.push(err51);
+                  }
+                  errors++;
+                }
+              }
+            }
+            if (data28.train !== undefined) {
+              let data31 = data28.train;
+              if (!(typeof data31 == 'number' && isFinite(data31))) {
                 const err52 = {
-                  instancePath: instancePath + '/splits/train_dev/evaluationRows',
-                  schemaPath: '#/$defs/split/properties/evaluationRows/enum',
-                  keyword: 'enum',
-                  params: { allowedValues: schema32.properties.evaluationRows.enum },
-                  message: 'must be equal to one of the allowed values',
+                  instancePath: instancePath + '/slices/' + i0 + '/train',
+                  schemaPath: '#/properties/slices/items/properties/train/type',
+                  keyword: 'type',
+                  params: { type: 'number' },
+                  message: 'must be number',
                 };
                 if (vErrors === null) {
                   vErrors = [err52];
@@ -1202,175 +1664,172 @@ function validate20(
                 errors++;
               }
             }
+            if (data28.validation !== undefined) {
+              let data32 = data28.validation;
+              if (!(typeof data32 == 'number' && isFinite(data32))) {
+                const err53 = {
+                  instancePath: instancePath + '/slices/' + i0 + '/validation',
+                  schemaPath: '#/properties/slices/items/properties/validation/type',
+                  keyword: 'type',
+                  params: { type: 'number' },
+                  message: 'must be number',
+                };
+                if (vErrors === null) {
+                  vErrors = [err53];
+                } else {
+                  vErrors.push(err53);
+                }
+                errors++;
+              }
+            }
           } else {
-            const err53 = {
-              instancePath: instancePath + '/splits/train_dev',
-              schemaPath: '#/$defs/split/type',
+            const err54 = {
+              instancePath: instancePath + '/slices/' + i0,
+              schemaPath: '#/properties/slices/items/type',
               keyword: 'type',
               params: { type: 'object' },
               message: 'must be object',
             };
             if (vErrors === null) {
-              vErrors = [err53];
+              vErrors = [err54];
             } else {
-              vErrors.push(err53);
+              vErrors.push(err54);
             }
             errors++;
           }
         }
-        if (data13.validation !== undefined) {
-          let data24 = data13.validation;
-          if (data24 && typeof data24 == 'object' && !Array.isArray(data24)) {
-            if (data24.values === undefined) {
-              const err54 = {
-                instancePath: instancePath + '/splits/validation',
-                schemaPath: '#/$defs/split/required',
-                keyword: 'required',
-                params: { missingProperty: 'values' },
-                message: "must have required property '" + 'values' + "'",
+      } else {
+        const err55 = {
+          instancePath: instancePath + '/slices',
+          schemaPath: '#/properties/slices/type',
+          keyword: 'type',
+          params: { type: 'array' },
+          message: 'must be array',
+        };
+        if (vErrors === null) {
+          vErrors = [err55];
+        } else {
+          vErrors.push(err55);
+        }
+        errors++;
+      }
+    }
+    if (data.predictions !== undefined) {
+      let data33 = data.predictions;
+      if (data33 && typeof data33 == 'object' && !Array.isArray(data33)) {
+        if (data33.split === undefined) {
+          const err56 = {
+            instancePath: instancePath + '/predictions',
+            schemaPath: '#/properties/predictions/required',
+            keyword: 'required',
+            params: { missingProperty: 'split' },
+            message: "must have required property '" + 'split' + "'",
+          };
+          if (vErrors === null) {
+            vErrors = [err56];
+          } else {
+            vErrors.push(err56);
+          }
+          errors++;
+        }
+        if (data33.path === undefined) {
+          const err57 = {
+            instancePath: instancePath + '/predictions',
+            schemaPath: '#/properties/predictions/required',
+            keyword: 'required',
+            params: { missingProperty: 'path' },
+            message: "must have required property '" + 'path' + "'",
+          };
+          if (vErrors === null) {
+            vErrors = [err57];
+          } else {
+            vErrors.push(err57);
+          }
+          errors++;
+        }
+        for (const key7 in data33) {
+          if (!(key7 === 'split' || key7 === 'path' || key7 === 'aggregate' || key7 === 'repeat')) {
+            const err58 = {
+              instancePath: instancePath + '/predictions',
+              schemaPath: '#/properties/predictions/additionalProperties',
+              keyword: 'additionalProperties',
+              params: { additionalProperty: key7 },
+              message: 'must NOT have additional properties',
+            };
+            if (vErrors === null) {
+              vErrors = [err58];
+            } else {
+              vErrors.push(err58);
+            }
+            errors++;
+          }
+        }
+        if (data33.split !== undefined) {
+          let data34 = data33.split;
+          if (!(
+            data34 === 'train' ||
+            data34 === 'train_dev' ||
+            data34 === 'validation' ||
+            data34 === 'test'
+          )) {
+            const err59 = {
+              instancePath: instancePath + '/predictions/split',
+              schemaPath: '#/properties/predictions/properties/split/enum',
+              keyword: 'enum',
+              params: { allowedValues: schema19.properties.predictions.properties.split.enum },
+              message: 'must be equal to one of the allowed values',
+            };
+            if (vErrors === null) {
+              vErrors = [err59];
+            } else {
+              vErrors.push(err59);
+            }
+            errors++;
+          }
+        }
+        if (data33.path !== undefined) {
+          let data35 = data33.path;
+          if (typeof data35 === 'string') {
+            if (func2(data35) < 1) {
+              const err60 = {
+                instancePath: instancePath + '/predictions/path',
+                schemaPath: '#/properties/predictions/properties/path/minLength',
+                keyword: 'minLength',
+                params: { limit: 1 },
+                message: 'must NOT have fewer than 1 characters',
               };
               if (vErrors === null) {
-                vErrors = [err54];
+                vErrors = [err60];
               } else {
-                vErrors.push(err54);
+                vErrors.push(err60);
               }
               errors++;
             }
-            for (const key6 in data24) {
-              if (!(key6 === 'examples' || key6 === 'values' || key6 === 'evaluationRows')) {
-                const err55 = {
-                  instancePath: instancePath + '/splits/validation',
-                  schemaPath: '#/$defs/split/additionalProperties',
-                  keyword: 'additionalProperties',
-                  params: { additionalProperty: key6 },
-                  message: 'must NOT have additional properties',
-                };
-                if (vErrors === null) {
-                  vErrors = [err55];
-                } else {
-                  vErrors.push(err55);
-                }
-                errors++;
-              }
-            }
-            if (data24.examples !== undefined) {
-              let data25 = data24.examples;
-              if (!(
-                typeof data25 == 'number' &&
-                !(data25 % 1) &&
-                !isNaN(data25) &&
-                isFinite(data25)
-              )) {
-                const err56 = {
-                  instancePath: instancePath + '/splits/validation/examples',
-                  schemaPath: '#/$defs/split/properties/examples/type',
-                  keyword: 'type',
-                  params: { type: 'integer' },
-                  message: 'must be integer',
-                };
-                if (vErrors === null) {
-                  vErrors = [err56];
-                } else {
-                  vErrors.push(err56);
-                }
-                errors++;
-              }
-              if (typeof data25 == 'number' && isFinite(data25)) {
-                if (data25 < 1 || isNaN(data25)) {
-                  const err57 = {
-                    instancePath: instancePath + '/splits/validation/examples',
-                    schemaPath: '#/$defs/split/properties/examples/minimum',
-                    keyword: 'minimum',
-                    params: { comparison: '>=', limit: 1 },
-                    message: 'must be >= 1',
-                  };
-                  if (vErrors === null) {
-                    vErrors = [err57];
-                  } else {
-                    vErrors.push(err57);
-                  }
-                  errors++;
-                }
-              }
-            }
-            if (data24.values !== undefined) {
-              let data26 = data24.values;
-              if (Array.isArray(data26)) {
-                if (data26.length < 1) {
-                  const err58 = {
-                    instancePath: instancePath + '/splits/validation/values',
-                    schemaPath: '#/$defs/split/properties/values/minItems',
-                    keyword: 'minItems',
-                    params: { limit: 1 },
-                    message: 'must NOT have fewer than 1 items',
-                  };
-                  if (vErrors === null) {
-                    vErrors = [err58];
-                  } else {
-                    vErrors.push(err58);
-                  }
-                  errors++;
-                }
-                const len2 = data26.length;
-                for (let i2 = 0; i2 < len2; i2++) {
-                  let data27 = data26[i2];
-                  if (!(typeof data27 == 'number' && isFinite(data27))) {
-                    const err59 = {
-                      instancePath: instancePath + '/splits/validation/values/' + i2,
-                      schemaPath: '#/$defs/split/properties/values/items/type',
-                      keyword: 'type',
-                      params: { type: 'number' },
-                      message: 'must be number',
-                    };
-                    if (vErrors === null) {
-                      vErrors = [err59];
-                    } else {
-                      vErrors.push(err59);
-                    }
-                    errors++;
-                  }
-                }
-              } else {
-                const err60 = {
-                  instancePath: instancePath + '/splits/validation/values',
-                  schemaPath: '#/$defs/split/properties/values/type',
-                  keyword: 'type',
-                  params: { type: 'array' },
-                  message: 'must be array',
-                };
-                if (vErrors === null) {
-                  vErrors = [err60];
-                } else {
-                  vErrors.push(err60);
-                }
-                errors++;
-              }
-            }
-            if (data24.evaluationRows !== undefined) {
-              let data28 = data24.evaluationRows;
-              if (!(data28 === 'fixed' || data28 === 'per-repeat')) {
-                const err61 = {
-                  instancePath: instancePath + '/splits/validation/evaluationRows',
-                  schemaPath: '#/$defs/split/properties/evaluationRows/enum',
-                  keyword: 'enum',
-                  params: { allowedValues: schema32.properties.evaluationRows.enum },
-                  message: 'must be equal to one of the allowed values',
-                };
-                if (vErrors === null) {
-                  vErrors = [err61];
-                } else {
-                  vErrors.push(err61);
-                }
-                errors++;
-              }
-            }
           } else {
-            const err62 = {
-              instancePath: instancePath + '/splits/validation',
-              schemaPath: '#/$defs/split/type',
+            const err61 = {
+              instancePath: instancePath + '/predictions/path',
+              schemaPath: '#/properties/predictions/properties/path/type',
               keyword: 'type',
-              params: { type: 'object' },
-              message: 'must be object',
+              params: { type: 'string' },
+              message: 'must be string',
+            };
+            if (vErrors === null) {
+              vErrors = [err61];
+            } else {
+              vErrors.push(err61);
+            }
+            errors++;
+          }
+        }
+        if (data33.aggregate !== undefined) {
+          let data36 = data33.aggregate;
+          if (!(data36 === 'mean' || data36 === 'rmse' || data36 === 'sum')) {
+            const err62 = {
+              instancePath: instancePath + '/predictions/aggregate',
+              schemaPath: '#/properties/predictions/properties/aggregate/enum',
+              keyword: 'enum',
+              params: { allowedValues: schema19.properties.predictions.properties.aggregate.enum },
+              message: 'must be equal to one of the allowed values',
             };
             if (vErrors === null) {
               vErrors = [err62];
@@ -1380,125 +1839,117 @@ function validate20(
             errors++;
           }
         }
-        if (data13.test !== undefined) {
-          let data29 = data13.test;
-          if (data29 && typeof data29 == 'object' && !Array.isArray(data29)) {
-            if (data29.values === undefined) {
-              const err63 = {
-                instancePath: instancePath + '/splits/test',
-                schemaPath: '#/$defs/split/required',
-                keyword: 'required',
-                params: { missingProperty: 'values' },
-                message: "must have required property '" + 'values' + "'",
+        if (data33.repeat !== undefined) {
+          let data37 = data33.repeat;
+          if (!(typeof data37 == 'number' && !(data37 % 1) && !isNaN(data37) && isFinite(data37))) {
+            const err63 = {
+              instancePath: instancePath + '/predictions/repeat',
+              schemaPath: '#/properties/predictions/properties/repeat/type',
+              keyword: 'type',
+              params: { type: 'integer' },
+              message: 'must be integer',
+            };
+            if (vErrors === null) {
+              vErrors = [err63];
+            } else {
+              vErrors.push(err63);
+            }
+            errors++;
+          }
+          if (typeof data37 == 'number' && isFinite(data37)) {
+            if (data37 < 0 || isNaN(data37)) {
+              const err64 = {
+                instancePath: instancePath + '/predictions/repeat',
+                schemaPath: '#/properties/predictions/properties/repeat/minimum',
+                keyword: 'minimum',
+                params: { comparison: '>=', limit: 0 },
+                message: 'must be >= 0',
               };
               if (vErrors === null) {
-                vErrors = [err63];
+                vErrors = [err64];
               } else {
-                vErrors.push(err63);
+                vErrors.push(err64);
               }
               errors++;
             }
-            for (const key7 in data29) {
-              if (!(key7 === 'examples' || key7 === 'values' || key7 === 'evaluationRows')) {
-                const err64 = {
-                  instancePath: instancePath + '/splits/test',
-                  schemaPath: '#/$defs/split/additionalProperties',
-                  keyword: 'additionalProperties',
-                  params: { additionalProperty: key7 },
-                  message: 'must NOT have additional properties',
-                };
-                if (vErrors === null) {
-                  vErrors = [err64];
-                } else {
-                  vErrors.push(err64);
-                }
-                errors++;
-              }
-            }
-            if (data29.examples !== undefined) {
-              let data30 = data29.examples;
-              if (!(
-                typeof data30 == 'number' &&
-                !(data30 % 1) &&
-                !isNaN(data30) &&
-                isFinite(data30)
-              )) {
-                const err65 = {
-                  instancePath: instancePath + '/splits/test/examples',
-                  schemaPath: '#/$defs/split/properties/examples/type',
-                  keyword: 'type',
-                  params: { type: 'integer' },
-                  message: 'must be integer',
-                };
-                if (vErrors === null) {
-                  vErrors = [err65];
-                } else {
-                  vErrors.push(err65);
-                }
-                errors++;
-              }
-              if (typeof data30 == 'number' && isFinite(data30)) {
-                if (data30 < 1 || isNaN(data30)) {
-                  const err66 = {
-                    instancePath: instancePath + '/splits/test/examples',
-                    schemaPath: '#/$defs/split/properties/examples/minimum',
-                    keyword: 'minimum',
-                    params: { comparison: '>=', limit: 1 },
-                    message: 'must be >= 1',
-                  };
-                  if (vErrors === null) {
-                    vErrors = [err66];
-                  } else {
-                    vErrors.push(err66);
-                  }
-                  errors++;
-                }
-              }
-            }
-            if (data29.values !== undefined) {
-              let data31 = data29.values;
-              if (Array.isArray(data31)) {
-                if (data31.length < 1) {
-                  const err67 = {
-                    instancePath: instancePath + '/splits/test/values',
-                    schemaPath: '#/$defs/split/properties/values/minItems',
-                    keyword: 'minItems',
-                    params: { limit: 1 },
-                    message: 'must NOT have fewer than 1 items',
-                  };
-                  if (vErrors === null) {
-                    vErrors = [err67];
-                  } else {
-                    vErrors.push(err67);
-                  }
-                  errors++;
-                }
-                const len3 = data31.length;
-                for (let i3 = 0; i3 < len3; i3++) {
-                  let data32 = data31[i3];
-                  if (!(typeof data32 == 'number' && isFinite(data32))) {
-                    const err68 = {
-                      instancePath: instancePath + '/splits/test/values/' + i3,
-                      schemaPath: '#/$defs/split/properties/values/items/type',
-                      keyword: 'type',
-                      params: { type: 'number' },
-                      message: 'must be number',
-                    };
-                    if (vErrors === null) {
-                      vErrors = [err68];
-                    } else {
-                      vErrors.push(err68);
-                    }
-                    errors++;
-                  }
-                }
+          }
+        }
+      } else {
+        const err65 = {
+          instancePath: instancePath + '/predictions',
+          schemaPath: '#/properties/predictions/type',
+          keyword: 'type',
+          params: { type: 'object' },
+          message: 'must be object',
+        };
+        if (vErrors === null) {
+          vErrors = [err65];
+        } else {
+          vErrors.push(err65);
+        }
+        errors++;
+      }
+    }
+    if (data.guardrails !== undefined) {
+      let data38 = data.guardrails;
+      if (Array.isArray(data38)) {
+        if (data38.length > 50) {
+          const err66 = {
+            instancePath: instancePath + '/guardrails',
+            schemaPath: '#/properties/guardrails/maxItems',
+            keyword: 'maxItems',
+            params: { limit: 50 },
+            message: 'must NOT have more than 50 items',
+          };
+          if (vErrors === null) {
+            vErrors = [err66];
+          } else {
+            vErrors.push(err66);
+          }
+          errors++;
+        }
+        const len1 = data38.length;
+        for (let i1 = 0; i1 < len1; i1++) {
+          let data39 = data38[i1];
+          if (data39 && typeof data39 == 'object' && !Array.isArray(data39)) {
+            if (data39.metric === undefined) {
+              const err67 = {
+                instancePath: instancePath + '/guardrails/' + i1,
+                schemaPath: '#/properties/guardrails/items/required',
+                keyword: 'required',
+                params: { missingProperty: 'metric' },
+                message: "must have required property '" + 'metric' + "'",
+              };
+              if (vErrors === null) {
+                vErrors = [err67];
               } else {
+                vErrors.push(err67);
+              }
+              errors++;
+            }
+            if (data39.splits === undefined) {
+              const err68 = {
+                instancePath: instancePath + '/guardrails/' + i1,
+                schemaPath: '#/properties/guardrails/items/required',
+                keyword: 'required',
+                params: { missingProperty: 'splits' },
+                message: "must have required property '" + 'splits' + "'",
+              };
+              if (vErrors === null) {
+                vErrors = [err68];
+              } else {
+                vErrors.push(err68);
+              }
+              errors++;
+            }
+            for (const key8 in data39) {
+              if (!(key8 === 'metric' || key8 === 'splits' || key8 === 'margin')) {
                 const err69 = {
-                  instancePath: instancePath + '/splits/test/values',
-                  schemaPath: '#/$defs/split/properties/values/type',
-                  keyword: 'type',
-                  params: { type: 'array' },
-                  message: 'must be array',
+                  instancePath: instancePath + '/guardrails/' + i1,
+                  schemaPath: '#/properties/guardrails/items/additionalProperties',
+                  keyword: 'additionalProperties',
+                  params: { additionalProperty: key8 },
+                  message: 'must NOT have additional properties',
                 };
                 if (vErrors === null) {
                   vErrors = [err69];
@@ -1508,159 +1959,167 @@ function validate20(
                 errors++;
               }
             }
-            if (data29.evaluationRows !== undefined) {
-              let data33 = data29.evaluationRows;
-              if (!(data33 === 'fixed' || data33 === 'per-repeat')) {
-                const err70 = {
-                  instancePath: instancePath + '/splits/test/evaluationRows',
-                  schemaPath: '#/$defs/split/properties/evaluationRows/enum',
-                  keyword: 'enum',
-                  params: { allowedValues: schema32.properties.evaluationRows.enum },
-                  message: 'must be equal to one of the allowed values',
-                };
-                if (vErrors === null) {
-                  vErrors = [err70];
-                } else {
-                  vErrors.push(err70);
-                }
-                errors++;
-              }
-            }
-          } else {
-            const err71 = {
-              instancePath: instancePath + '/splits/test',
-              schemaPath: '#/$defs/split/type',
-              keyword: 'type',
-              params: { type: 'object' },
-              message: 'must be object',
-            };
-            if (vErrors === null) {
-              vErrors = [err71];
-            } else {
-              vErrors.push(err71);
-            }
-            errors++;
-          }
-        }
-      } else {
-        const err72 = {
-          instancePath: instancePath + '/splits',
-          schemaPath: '#/properties/splits/type',
-          keyword: 'type',
-          params: { type: 'object' },
-          message: 'must be object',
-        };
-        if (vErrors === null) {
-          vErrors = [err72];
-        } else {
-          vErrors.push(err72);
-        }
-        errors++;
-      }
-    }
-    if (data.hyperparameters !== undefined) {
-      let data34 = data.hyperparameters;
-      if (!(data34 && typeof data34 == 'object' && !Array.isArray(data34))) {
-        const err73 = {
-          instancePath: instancePath + '/hyperparameters',
-          schemaPath: '#/properties/hyperparameters/type',
-          keyword: 'type',
-          params: { type: 'object' },
-          message: 'must be object',
-        };
-        if (vErrors === null) {
-          vErrors = [err73];
-        } else {
-          vErrors.push(err73);
-        }
-        errors++;
-      }
-    }
-    if (data.curves !== undefined) {
-      let data35 = data.curves;
-      if (data35 && typeof data35 == 'object' && !Array.isArray(data35)) {
-        for (const key8 in data35) {
-          if (!(
-            key8 === 'epochs' ||
-            key8 === 'training_examples' ||
-            key8 === 'regularization' ||
-            key8 === 'sources'
-          )) {
-            const err74 = {
-              instancePath: instancePath + '/curves',
-              schemaPath: '#/properties/curves/additionalProperties',
-              keyword: 'additionalProperties',
-              params: { additionalProperty: key8 },
-              message: 'must NOT have additional properties',
-            };
-            if (vErrors === null) {
-              vErrors = [err74];
-            } else {
-              vErrors.push(err74);
-            }
-            errors++;
-          }
-        }
-        if (data35.epochs !== undefined) {
-          let data36 = data35.epochs;
-          if (Array.isArray(data36)) {
-            if (data36.length < 1) {
-              const err75 = {
-                instancePath: instancePath + '/curves/epochs',
-                schemaPath: '#/$defs/curve/minItems',
-                keyword: 'minItems',
-                params: { limit: 1 },
-                message: 'must NOT have fewer than 1 items',
-              };
-              if (vErrors === null) {
-                vErrors = [err75];
-              } else {
-                vErrors.push(err75);
-              }
-              errors++;
-            }
-            const len4 = data36.length;
-            for (let i4 = 0; i4 < len4; i4++) {
-              let data37 = data36[i4];
-              if (data37 && typeof data37 == 'object' && !Array.isArray(data37)) {
-                if (data37.x === undefined) {
-                  const err76 = {
-                    instancePath: instancePath + '/curves/epochs/' + i4,
-                    schemaPath: '#/$defs/curve/items/required',
+            if (data39.metric !== undefined) {
+              let data40 = data39.metric;
+              if (data40 && typeof data40 == 'object' && !Array.isArray(data40)) {
+                if (data40.name === undefined) {
+                  const err70 = {
+                    instancePath: instancePath + '/guardrails/' + i1 + '/metric',
+                    schemaPath: '#/properties/guardrails/items/properties/metric/required',
                     keyword: 'required',
-                    params: { missingProperty: 'x' },
-                    message: "must have required property '" + 'x' + "'",
+                    params: { missingProperty: 'name' },
+                    message: "must have required property '" + 'name' + "'",
                   };
                   if (vErrors === null) {
-                    vErrors = [err76];
+                    vErrors = [err70];
                   } else {
-                    vErrors.push(err76);
+                    vErrors.push(err70);
                   }
                   errors++;
                 }
-                if (data37.validation === undefined) {
-                  const err77 = {
-                    instancePath: instancePath + '/curves/epochs/' + i4,
-                    schemaPath: '#/$defs/curve/items/required',
+                if (data40.goal === undefined) {
+                  const err71 = {
+                    instancePath: instancePath + '/guardrails/' + i1 + '/metric',
+                    schemaPath: '#/properties/guardrails/items/properties/metric/required',
                     keyword: 'required',
-                    params: { missingProperty: 'validation' },
-                    message: "must have required property '" + 'validation' + "'",
+                    params: { missingProperty: 'goal' },
+                    message: "must have required property '" + 'goal' + "'",
                   };
                   if (vErrors === null) {
-                    vErrors = [err77];
+                    vErrors = [err71];
                   } else {
-                    vErrors.push(err77);
+                    vErrors.push(err71);
                   }
                   errors++;
                 }
-                for (const key9 in data37) {
-                  if (!(key9 === 'x' || key9 === 'train' || key9 === 'validation')) {
-                    const err78 = {
-                      instancePath: instancePath + '/curves/epochs/' + i4,
-                      schemaPath: '#/$defs/curve/items/additionalProperties',
+                if (data40.kind === undefined) {
+                  const err72 = {
+                    instancePath: instancePath + '/guardrails/' + i1 + '/metric',
+                    schemaPath: '#/properties/guardrails/items/properties/metric/required',
+                    keyword: 'required',
+                    params: { missingProperty: 'kind' },
+                    message: "must have required property '" + 'kind' + "'",
+                  };
+                  if (vErrors === null) {
+                    vErrors = [err72];
+                  } else {
+                    vErrors.push(err72);
+                  }
+                  errors++;
+                }
+                for (const key9 in data40) {
+                  if (!(
+                    key9 === 'name' ||
+                    key9 === 'goal' ||
+                    key9 === 'kind' ||
+                    key9 === 'best' ||
+                    key9 === 'unit'
+                  )) {
+                    const err73 = {
+                      instancePath: instancePath + '/guardrails/' + i1 + '/metric',
+                      schemaPath:
+                        '#/properties/guardrails/items/properties/metric/additionalProperties',
                       keyword: 'additionalProperties',
                       params: { additionalProperty: key9 },
                       message: 'must NOT have additional properties',
+                    };
+                    if (vErrors === null) {
+                      vErrors = [err73];
+                    } else {
+                      vErrors.push(err73);
+                    }
+                    errors++;
+                  }
+                }
+                if (data40.name !== undefined) {
+                  let data41 = data40.name;
+                  if (typeof data41 === 'string') {
+                    if (func2(data41) > 100) {
+                      const err74 = {
+                        instancePath: instancePath + '/guardrails/' + i1 + '/metric/name',
+                        schemaPath:
+                          '#/properties/guardrails/items/properties/metric/properties/name/maxLength',
+                        keyword: 'maxLength',
+                        params: { limit: 100 },
+                        message: 'must NOT have more than 100 characters',
+                      };
+                      if (vErrors === null) {
+                        vErrors = [err74];
+                      } else {
+                        vErrors.push(err74);
+                      }
+                      errors++;
+                    }
+                    if (func2(data41) < 1) {
+                      const err75 = {
+                        instancePath: instancePath + '/guardrails/' + i1 + '/metric/name',
+                        schemaPath:
+                          '#/properties/guardrails/items/properties/metric/properties/name/minLength',
+                        keyword: 'minLength',
+                        params: { limit: 1 },
+                        message: 'must NOT have fewer than 1 characters',
+                      };
+                      if (vErrors === null) {
+                        vErrors = [err75];
+                      } else {
+                        vErrors.push(err75);
+                      }
+                      errors++;
+                    }
+                  } else {
+                    const err76 = {
+                      instancePath: instancePath + '/guardrails/' + i1 + '/metric/name',
+                      schemaPath:
+                        '#/properties/guardrails/items/properties/metric/properties/name/type',
+                      keyword: 'type',
+                      params: { type: 'string' },
+                      message: 'must be string',
+                    };
+                    if (vErrors === null) {
+                      vErrors = [err76];
+                    } else {
+                      vErrors.push(err76);
+                    }
+                    errors++;
+                  }
+                }
+                if (data40.goal !== undefined) {
+                  let data42 = data40.goal;
+                  if (!(data42 === 'minimize' || data42 === 'maximize')) {
+                    const err77 = {
+                      instancePath: instancePath + '/guardrails/' + i1 + '/metric/goal',
+                      schemaPath:
+                        '#/properties/guardrails/items/properties/metric/properties/goal/enum',
+                      keyword: 'enum',
+                      params: {
+                        allowedValues:
+                          schema19.properties.guardrails.items.properties.metric.properties.goal
+                            .enum,
+                      },
+                      message: 'must be equal to one of the allowed values',
+                    };
+                    if (vErrors === null) {
+                      vErrors = [err77];
+                    } else {
+                      vErrors.push(err77);
+                    }
+                    errors++;
+                  }
+                }
+                if (data40.kind !== undefined) {
+                  let data43 = data40.kind;
+                  if (!(data43 === 'proportion' || data43 === 'continuous')) {
+                    const err78 = {
+                      instancePath: instancePath + '/guardrails/' + i1 + '/metric/kind',
+                      schemaPath:
+                        '#/properties/guardrails/items/properties/metric/properties/kind/enum',
+                      keyword: 'enum',
+                      params: {
+                        allowedValues:
+                          schema19.properties.guardrails.items.properties.metric.properties.kind
+                            .enum,
+                      },
+                      message: 'must be equal to one of the allowed values',
                     };
                     if (vErrors === null) {
                       vErrors = [err78];
@@ -1670,12 +2129,13 @@ function validate20(
                     errors++;
                   }
                 }
-                if (data37.x !== undefined) {
-                  let data38 = data37.x;
-                  if (!(typeof data38 == 'number' && isFinite(data38))) {
+                if (data40.best !== undefined) {
+                  let data44 = data40.best;
+                  if (!(typeof data44 == 'number' && isFinite(data44))) {
                     const err79 = {
-                      instancePath: instancePath + '/curves/epochs/' + i4 + '/x',
-                      schemaPath: '#/$defs/curve/items/properties/x/type',
+                      instancePath: instancePath + '/guardrails/' + i1 + '/metric/best',
+                      schemaPath:
+                        '#/properties/guardrails/items/properties/metric/properties/best/type',
                       keyword: 'type',
                       params: { type: 'number' },
                       message: 'must be number',
@@ -1688,376 +2148,410 @@ function validate20(
                     errors++;
                   }
                 }
-                if (data37.train !== undefined) {
-                  let data39 = data37.train;
-                  if (!(typeof data39 == 'number' && isFinite(data39))) {
-                    const err80 = {
-                      instancePath: instancePath + '/curves/epochs/' + i4 + '/train',
-                      schemaPath: '#/$defs/curve/items/properties/train/type',
-                      keyword: 'type',
-                      params: { type: 'number' },
-                      message: 'must be number',
-                    };
-                    if (vErrors === null) {
-                      vErrors = [err80];
-                    } else {
-                      vErrors.push(err80);
+                if (data40.unit !== undefined) {
+                  let data45 = data40.unit;
+                  if (typeof data45 === 'string') {
+                    if (func2(data45) > 40) {
+                      const err80 = {
+                        instancePath: instancePath + '/guardrails/' + i1 + '/metric/unit',
+                        schemaPath:
+                          '#/properties/guardrails/items/properties/metric/properties/unit/maxLength',
+                        keyword: 'maxLength',
+                        params: { limit: 40 },
+                        message: 'must NOT have more than 40 characters',
+                      };
+                      if (vErrors === null) {
+                        vErrors = [err80];
+                      } else {
+                        vErrors.push(err80);
+                      }
+                      errors++;
                     }
-                    errors++;
-                  }
-                }
-                if (data37.validation !== undefined) {
-                  let data40 = data37.validation;
-                  if (!(typeof data40 == 'number' && isFinite(data40))) {
-                    const err81 = {
-                      instancePath: instancePath + '/curves/epochs/' + i4 + '/validation',
-                      schemaPath: '#/$defs/curve/items/properties/validation/type',
+                    if (func2(data45) < 1) {
+                      const err81 = {
+                        instancePath: instancePath + '/guardrails/' + i1 + '/metric/unit',
+                        schemaPath:
+                          '#/properties/guardrails/items/properties/metric/properties/unit/minLength',
+                        keyword: 'minLength',
+                        params: { limit: 1 },
+                        message: 'must NOT have fewer than 1 characters',
+                      };
+                      if (vErrors === null) {
+                        vErrors = [err81];
+                      } else {
+                        vErrors.push(err81);
+                      }
+                      errors++;
+                    }
+                  } else {
+                    const err82 = {
+                      instancePath: instancePath + '/guardrails/' + i1 + '/metric/unit',
+                      schemaPath:
+                        '#/properties/guardrails/items/properties/metric/properties/unit/type',
                       keyword: 'type',
-                      params: { type: 'number' },
-                      message: 'must be number',
+                      params: { type: 'string' },
+                      message: 'must be string',
                     };
                     if (vErrors === null) {
-                      vErrors = [err81];
+                      vErrors = [err82];
                     } else {
-                      vErrors.push(err81);
+                      vErrors.push(err82);
                     }
                     errors++;
                   }
                 }
               } else {
-                const err82 = {
-                  instancePath: instancePath + '/curves/epochs/' + i4,
-                  schemaPath: '#/$defs/curve/items/type',
+                const err83 = {
+                  instancePath: instancePath + '/guardrails/' + i1 + '/metric',
+                  schemaPath: '#/properties/guardrails/items/properties/metric/type',
                   keyword: 'type',
                   params: { type: 'object' },
                   message: 'must be object',
                 };
                 if (vErrors === null) {
-                  vErrors = [err82];
+                  vErrors = [err83];
                 } else {
-                  vErrors.push(err82);
+                  vErrors.push(err83);
                 }
                 errors++;
               }
             }
-          } else {
-            const err83 = {
-              instancePath: instancePath + '/curves/epochs',
-              schemaPath: '#/$defs/curve/type',
-              keyword: 'type',
-              params: { type: 'array' },
-              message: 'must be array',
-            };
-            if (vErrors === null) {
-              vErrors = [err83];
-            } else {
-              vErrors.push(err83);
-            }
-            errors++;
-          }
-        }
-        if (data35.training_examples !== undefined) {
-          let data41 = data35.training_examples;
-          if (Array.isArray(data41)) {
-            if (data41.length < 1) {
-              const err84 = {
-                instancePath: instancePath + '/curves/training_examples',
-                schemaPath: '#/$defs/curve/minItems',
-                keyword: 'minItems',
-                params: { limit: 1 },
-                message: 'must NOT have fewer than 1 items',
-              };
-              if (vErrors === null) {
-                vErrors = [err84];
-              } else {
-                vErrors.push(err84);
-              }
-              errors++;
-            }
-            const len5 = data41.length;
-            for (let i5 = 0; i5 < len5; i5++) {
-              let data42 = data41[i5];
-              if (data42 && typeof data42 == 'object' && !Array.isArray(data42)) {
-                if (data42.x === undefined) {
-                  const err85 = {
-                    instancePath: instancePath + '/curves/training_examples/' + i5,
-                    schemaPath: '#/$defs/curve/items/required',
-                    keyword: 'required',
-                    params: { missingProperty: 'x' },
-                    message: "must have required property '" + 'x' + "'",
-                  };
-                  if (vErrors === null) {
-                    vErrors = [err85];
-                  } else {
-                    vErrors.push(err85);
-                  }
-                  errors++;
-                }
-                if (data42.validation === undefined) {
-                  const err86 = {
-                    instancePath: instancePath + '/curves/training_examples/' + i5,
-                    schemaPath: '#/$defs/curve/items/required',
+            if (data39.splits !== undefined) {
+              let data46 = data39.splits;
+              if (data46 && typeof data46 == 'object' && !Array.isArray(data46)) {
+                if (data46.validation === undefined) {
+                  const err84 = {
+                    instancePath: instancePath + '/guardrails/' + i1 + '/splits',
+                    schemaPath: '#/properties/guardrails/items/properties/splits/required',
                     keyword: 'required',
                     params: { missingProperty: 'validation' },
                     message: "must have required property '" + 'validation' + "'",
                   };
                   if (vErrors === null) {
-                    vErrors = [err86];
+                    vErrors = [err84];
                   } else {
-                    vErrors.push(err86);
+                    vErrors.push(err84);
                   }
                   errors++;
                 }
-                for (const key10 in data42) {
-                  if (!(key10 === 'x' || key10 === 'train' || key10 === 'validation')) {
-                    const err87 = {
-                      instancePath: instancePath + '/curves/training_examples/' + i5,
-                      schemaPath: '#/$defs/curve/items/additionalProperties',
+                for (const key10 in data46) {
+                  if (!(key10 === 'validation' || key10 === 'test')) {
+                    const err85 = {
+                      instancePath: instancePath + '/guardrails/' + i1 + '/splits',
+                      schemaPath:
+                        '#/properties/guardrails/items/properties/splits/additionalProperties',
                       keyword: 'additionalProperties',
                       params: { additionalProperty: key10 },
                       message: 'must NOT have additional properties',
                     };
                     if (vErrors === null) {
-                      vErrors = [err87];
+                      vErrors = [err85];
                     } else {
-                      vErrors.push(err87);
+                      vErrors.push(err85);
                     }
                     errors++;
                   }
                 }
-                if (data42.x !== undefined) {
-                  let data43 = data42.x;
-                  if (!(typeof data43 == 'number' && isFinite(data43))) {
-                    const err88 = {
-                      instancePath: instancePath + '/curves/training_examples/' + i5 + '/x',
-                      schemaPath: '#/$defs/curve/items/properties/x/type',
-                      keyword: 'type',
-                      params: { type: 'number' },
-                      message: 'must be number',
-                    };
-                    if (vErrors === null) {
-                      vErrors = [err88];
-                    } else {
-                      vErrors.push(err88);
-                    }
-                    errors++;
+                if (data46.validation !== undefined) {
+                  if (
+                    !validate53(data46.validation, {
+                      instancePath: instancePath + '/guardrails/' + i1 + '/splits/validation',
+                      parentData: data46,
+                      parentDataProperty: 'validation',
+                      rootData,
+                      dynamicAnchors,
+                    })
+                  ) {
+                    vErrors =
+                      vErrors === null ? validate53.errors : vErrors.concat(validate53.errors);
+                    errors = vErrors.length;
                   }
                 }
-                if (data42.train !== undefined) {
-                  let data44 = data42.train;
-                  if (!(typeof data44 == 'number' && isFinite(data44))) {
-                    const err89 = {
-                      instancePath: instancePath + '/curves/training_examples/' + i5 + '/train',
-                      schemaPath: '#/$defs/curve/items/properties/train/type',
-                      keyword: 'type',
-                      params: { type: 'number' },
-                      message: 'must be number',
-                    };
-                    if (vErrors === null) {
-                      vErrors = [err89];
-                    } else {
-                      vErrors.push(err89);
-                    }
-                    errors++;
-                  }
-                }
-                if (data42.validation !== undefined) {
-                  let data45 = data42.validation;
-                  if (!(typeof data45 == 'number' && isFinite(data45))) {
-                    const err90 = {
-                      instancePath:
-                        instancePath + '/curves/training_examples/' + i5 + '/validation',
-                      schemaPath: '#/$defs/curve/items/properties/validation/type',
-                      keyword: 'type',
-                      params: { type: 'number' },
-                      message: 'must be number',
-                    };
-                    if (vErrors === null) {
-                      vErrors = [err90];
-                    } else {
-                      vErrors.push(err90);
-                    }
-                    errors++;
+                if (data46.test !== undefined) {
+                  if (
+                    !validate53(data46.test, {
+                      instancePath: instancePath + '/guardrails/' + i1 + '/splits/test',
+                      parentData: data46,
+                      parentDataProperty: 'test',
+                      rootData,
+                      dynamicAnchors,
+                    })
+                  ) {
+                    vErrors =
+                      vErrors === null ? validate53.errors : vErrors.concat(validate53.errors);
+                    errors = vErrors.length;
                   }
                 }
               } else {
-                const err91 = {
-                  instancePath: instancePath + '/curves/training_examples/' + i5,
-                  schemaPath: '#/$defs/curve/items/type',
+                const err86 = {
+                  instancePath: instancePath + '/guardrails/' + i1 + '/splits',
+                  schemaPath: '#/properties/guardrails/items/properties/splits/type',
                   keyword: 'type',
                   params: { type: 'object' },
                   message: 'must be object',
                 };
                 if (vErrors === null) {
-                  vErrors = [err91];
+                  vErrors = [err86];
                 } else {
-                  vErrors.push(err91);
+                  vErrors.push(err86);
+                }
+                errors++;
+              }
+            }
+            if (data39.margin !== undefined) {
+              let data49 = data39.margin;
+              if (typeof data49 == 'number' && isFinite(data49)) {
+                if (data49 < 0 || isNaN(data49)) {
+                  const err87 = {
+                    instancePath: instancePath + '/guardrails/' + i1 + '/margin',
+                    schemaPath: '#/properties/guardrails/items/properties/margin/minimum',
+                    keyword: 'minimum',
+                    params: { comparison: '>=', limit: 0 },
+                    message: 'must be >= 0',
+                  };
+                  if (vErrors === null) {
+                    vErrors = [err87];
+                  } else {
+                    vErrors.push(err87);
+                  }
+                  errors++;
+                }
+              } else {
+                const err88 = {
+                  instancePath: instancePath + '/guardrails/' + i1 + '/margin',
+                  schemaPath: '#/properties/guardrails/items/properties/margin/type',
+                  keyword: 'type',
+                  params: { type: 'number' },
+                  message: 'must be number',
+                };
+                if (vErrors === null) {
+                  vErrors = [err88];
+                } else {
+                  vErrors.push(err88);
                 }
                 errors++;
               }
             }
           } else {
-            const err92 = {
-              instancePath: instancePath + '/curves/training_examples',
-              schemaPath: '#/$defs/curve/type',
+            const err89 = {
+              instancePath: instancePath + '/guardrails/' + i1,
+              schemaPath: '#/properties/guardrails/items/type',
               keyword: 'type',
-              params: { type: 'array' },
-              message: 'must be array',
+              params: { type: 'object' },
+              message: 'must be object',
             };
             if (vErrors === null) {
-              vErrors = [err92];
+              vErrors = [err89];
             } else {
-              vErrors.push(err92);
+              vErrors.push(err89);
             }
             errors++;
           }
         }
-        if (data35.regularization !== undefined) {
-          let data46 = data35.regularization;
-          if (Array.isArray(data46)) {
-            if (data46.length < 1) {
-              const err93 = {
-                instancePath: instancePath + '/curves/regularization',
-                schemaPath: '#/$defs/curve/minItems',
+      } else {
+        const err90 = {
+          instancePath: instancePath + '/guardrails',
+          schemaPath: '#/properties/guardrails/type',
+          keyword: 'type',
+          params: { type: 'array' },
+          message: 'must be array',
+        };
+        if (vErrors === null) {
+          vErrors = [err90];
+        } else {
+          vErrors.push(err90);
+        }
+        errors++;
+      }
+    }
+    if (data.cost !== undefined) {
+      let data50 = data.cost;
+      if (data50 && typeof data50 == 'object' && !Array.isArray(data50)) {
+        for (const key11 in data50) {
+          if (!(
+            key11 === 'trainSeconds' ||
+            key11 === 'inferenceMs' ||
+            key11 === 'parameters' ||
+            key11 === 'memoryMb'
+          )) {
+            const err91 = {
+              instancePath: instancePath + '/cost',
+              schemaPath: '#/properties/cost/additionalProperties',
+              keyword: 'additionalProperties',
+              params: { additionalProperty: key11 },
+              message: 'must NOT have additional properties',
+            };
+            if (vErrors === null) {
+              vErrors = [err91];
+            } else {
+              vErrors.push(err91);
+            }
+            errors++;
+          }
+        }
+        if (data50.trainSeconds !== undefined) {
+          let data51 = data50.trainSeconds;
+          if (Array.isArray(data51)) {
+            if (data51.length < 1) {
+              const err92 = {
+                instancePath: instancePath + '/cost/trainSeconds',
+                schemaPath: '#/properties/cost/properties/trainSeconds/minItems',
                 keyword: 'minItems',
                 params: { limit: 1 },
                 message: 'must NOT have fewer than 1 items',
               };
               if (vErrors === null) {
-                vErrors = [err93];
+                vErrors = [err92];
               } else {
-                vErrors.push(err93);
+                vErrors.push(err92);
               }
               errors++;
             }
-            const len6 = data46.length;
-            for (let i6 = 0; i6 < len6; i6++) {
-              let data47 = data46[i6];
-              if (data47 && typeof data47 == 'object' && !Array.isArray(data47)) {
-                if (data47.x === undefined) {
-                  const err94 = {
-                    instancePath: instancePath + '/curves/regularization/' + i6,
-                    schemaPath: '#/$defs/curve/items/required',
-                    keyword: 'required',
-                    params: { missingProperty: 'x' },
-                    message: "must have required property '" + 'x' + "'",
+            const len2 = data51.length;
+            for (let i2 = 0; i2 < len2; i2++) {
+              let data52 = data51[i2];
+              if (typeof data52 == 'number' && isFinite(data52)) {
+                if (data52 <= 0 || isNaN(data52)) {
+                  const err93 = {
+                    instancePath: instancePath + '/cost/trainSeconds/' + i2,
+                    schemaPath: '#/properties/cost/properties/trainSeconds/items/exclusiveMinimum',
+                    keyword: 'exclusiveMinimum',
+                    params: { comparison: '>', limit: 0 },
+                    message: 'must be > 0',
                   };
                   if (vErrors === null) {
-                    vErrors = [err94];
+                    vErrors = [err93];
                   } else {
-                    vErrors.push(err94);
+                    vErrors.push(err93);
                   }
                   errors++;
-                }
-                if (data47.validation === undefined) {
-                  const err95 = {
-                    instancePath: instancePath + '/curves/regularization/' + i6,
-                    schemaPath: '#/$defs/curve/items/required',
-                    keyword: 'required',
-                    params: { missingProperty: 'validation' },
-                    message: "must have required property '" + 'validation' + "'",
-                  };
-                  if (vErrors === null) {
-                    vErrors = [err95];
-                  } else {
-                    vErrors.push(err95);
-                  }
-                  errors++;
-                }
-                for (const key11 in data47) {
-                  if (!(key11 === 'x' || key11 === 'train' || key11 === 'validation')) {
-                    const err96 = {
-                      instancePath: instancePath + '/curves/regularization/' + i6,
-                      schemaPath: '#/$defs/curve/items/additionalProperties',
-                      keyword: 'additionalProperties',
-                      params: { additionalProperty: key11 },
-                      message: 'must NOT have additional properties',
-                    };
-                    if (vErrors === null) {
-                      vErrors = [err96];
-                    } else {
-                      vErrors.push(err96);
-                    }
-                    errors++;
-                  }
-                }
-                if (data47.x !== undefined) {
-                  let data48 = data47.x;
-                  if (!(typeof data48 == 'number' && isFinite(data48))) {
-                    const err97 = {
-                      instancePath: instancePath + '/curves/regularization/' + i6 + '/x',
-                      schemaPath: '#/$defs/curve/items/properties/x/type',
-                      keyword: 'type',
-                      params: { type: 'number' },
-                      message: 'must be number',
-                    };
-                    if (vErrors === null) {
-                      vErrors = [err97];
-                    } else {
-                      vErrors.push(err97);
-                    }
-                    errors++;
-                  }
-                }
-                if (data47.train !== undefined) {
-                  let data49 = data47.train;
-                  if (!(typeof data49 == 'number' && isFinite(data49))) {
-                    const err98 = {
-                      instancePath: instancePath + '/curves/regularization/' + i6 + '/train',
-                      schemaPath: '#/$defs/curve/items/properties/train/type',
-                      keyword: 'type',
-                      params: { type: 'number' },
-                      message: 'must be number',
-                    };
-                    if (vErrors === null) {
-                      vErrors = [err98];
-                    } else {
-                      vErrors.push(err98);
-                    }
-                    errors++;
-                  }
-                }
-                if (data47.validation !== undefined) {
-                  let data50 = data47.validation;
-                  if (!(typeof data50 == 'number' && isFinite(data50))) {
-                    const err99 = {
-                      instancePath: instancePath + '/curves/regularization/' + i6 + '/validation',
-                      schemaPath: '#/$defs/curve/items/properties/validation/type',
-                      keyword: 'type',
-                      params: { type: 'number' },
-                      message: 'must be number',
-                    };
-                    if (vErrors === null) {
-                      vErrors = [err99];
-                    } else {
-                      vErrors.push(err99);
-                    }
-                    errors++;
-                  }
                 }
               } else {
-                const err100 = {
-                  instancePath: instancePath + '/curves/regularization/' + i6,
-                  schemaPath: '#/$defs/curve/items/type',
+                const err94 = {
+                  instancePath: instancePath + '/cost/trainSeconds/' + i2,
+                  schemaPath: '#/properties/cost/properties/trainSeconds/items/type',
                   keyword: 'type',
-                  params: { type: 'object' },
-                  message: 'must be object',
+                  params: { type: 'number' },
+                  message: 'must be number',
                 };
                 if (vErrors === null) {
-                  vErrors = [err100];
+                  vErrors = [err94];
                 } else {
-                  vErrors.push(err100);
+                  vErrors.push(err94);
                 }
                 errors++;
               }
             }
           } else {
-            const err101 = {
-              instancePath: instancePath + '/curves/regularization',
-              schemaPath: '#/$defs/curve/type',
+            const err95 = {
+              instancePath: instancePath + '/cost/trainSeconds',
+              schemaPath: '#/properties/cost/properties/trainSeconds/type',
               keyword: 'type',
               params: { type: 'array' },
               message: 'must be array',
+            };
+            if (vErrors === null) {
+              vErrors = [err95];
+            } else {
+              vErrors.push(err95);
+            }
+            errors++;
+          }
+        }
+        if (data50.inferenceMs !== undefined) {
+          let data53 = data50.inferenceMs;
+          if (Array.isArray(data53)) {
+            if (data53.length < 1) {
+              const err96 = {
+                instancePath: instancePath + '/cost/inferenceMs',
+                schemaPath: '#/properties/cost/properties/inferenceMs/minItems',
+                keyword: 'minItems',
+                params: { limit: 1 },
+                message: 'must NOT have fewer than 1 items',
+              };
+              if (vErrors === null) {
+                vErrors = [err96];
+              } else {
+                vErrors.push(err96);
+              }
+              errors++;
+            }
+            const len3 = data53.length;
+            for (let i3 = 0; i3 < len3; i3++) {
+              let data54 = data53[i3];
+              if (typeof data54 == 'number' && isFinite(data54)) {
+                if (data54 <= 0 || isNaN(data54)) {
+                  const err97 = {
+                    instancePath: instancePath + '/cost/inferenceMs/' + i3,
+                    schemaPath: '#/properties/cost/properties/inferenceMs/items/exclusiveMinimum',
+                    keyword: 'exclusiveMinimum',
+                    params: { comparison: '>', limit: 0 },
+                    message: 'must be > 0',
+                  };
+                  if (vErrors === null) {
+                    vErrors = [err97];
+                  } else {
+                    vErrors.push(err97);
+                  }
+                  errors++;
+                }
+              } else {
+                const err98 = {
+                  instancePath: instancePath + '/cost/inferenceMs/' + i3,
+                  schemaPath: '#/properties/cost/properties/inferenceMs/items/type',
+                  keyword: 'type',
+                  params: { type: 'number' },
+                  message: 'must be number',
+                };
+                if (vErrors === null) {
+                  vErrors = [err98];
+                } else {
+                  vErrors.push(err98);
+                }
+                errors++;
+              }
+            }
+          } else {
+            const err99 = {
+              instancePath: instancePath + '/cost/inferenceMs',
+              schemaPath: '#/properties/cost/properties/inferenceMs/type',
+              keyword: 'type',
+              params: { type: 'array' },
+              message: 'must be array',
+            };
+            if (vErrors === null) {
+              vErrors = [err99];
+            } else {
+              vErrors.push(err99);
+            }
+            errors++;
+          }
+        }
+        if (data50.parameters !== undefined) {
+          let data55 = data50.parameters;
+          if (typeof data55 == 'number' && isFinite(data55)) {
+            if (data55 <= 0 || isNaN(data55)) {
+              const err100 = {
+                instancePath: instancePath + '/cost/parameters',
+                schemaPath: '#/properties/cost/properties/parameters/exclusiveMinimum',
+                keyword: 'exclusiveMinimum',
+                params: { comparison: '>', limit: 0 },
+                message: 'must be > 0',
+              };
+              if (vErrors === null) {
+                vErrors = [err100];
+              } else {
+                vErrors.push(err100);
+              }
+              errors++;
+            }
+          } else {
+            const err101 = {
+              instancePath: instancePath + '/cost/parameters',
+              schemaPath: '#/properties/cost/properties/parameters/type',
+              keyword: 'type',
+              params: { type: 'number' },
+              message: 'must be number',
             };
             if (vErrors === null) {
               vErrors = [err101];
@@ -2067,1506 +2561,11 @@ function validate20(
             errors++;
           }
         }
-        if (data35.sources !== undefined) {
-          let data51 = data35.sources;
-          if (data51 && typeof data51 == 'object' && !Array.isArray(data51)) {
-            for (const key12 in data51) {
-              if (!(
-                key12 === 'epochs' ||
-                key12 === 'training_examples' ||
-                key12 === 'regularization'
-              )) {
-                const err102 = {
-                  instancePath: instancePath + '/curves/sources',
-                  schemaPath: '#/properties/curves/properties/sources/additionalProperties',
-                  keyword: 'additionalProperties',
-                  params: { additionalProperty: key12 },
-                  message: 'must NOT have additional properties',
-                };
-                if (vErrors === null) {
-                  vErrors = [err102];
-                } else {
-                  vErrors.push(err102);
-                }
-                errors++;
-              }
-            }
-            if (data51.epochs !== undefined) {
-              let data52 = data51.epochs;
-              if (!(data52 === 'held-out' || data52 === 'cross-validation')) {
-                const err103 = {
-                  instancePath: instancePath + '/curves/sources/epochs',
-                  schemaPath: '#/properties/curves/properties/sources/properties/epochs/enum',
-                  keyword: 'enum',
-                  params: {
-                    allowedValues:
-                      schema31.properties.curves.properties.sources.properties.epochs.enum,
-                  },
-                  message: 'must be equal to one of the allowed values',
-                };
-                if (vErrors === null) {
-                  vErrors = [err103];
-                } else {
-                  vErrors.push(err103);
-                }
-                errors++;
-              }
-            }
-            if (data51.training_examples !== undefined) {
-              let data53 = data51.training_examples;
-              if (!(data53 === 'held-out' || data53 === 'cross-validation')) {
-                const err104 = {
-                  instancePath: instancePath + '/curves/sources/training_examples',
-                  schemaPath:
-                    '#/properties/curves/properties/sources/properties/training_examples/enum',
-                  keyword: 'enum',
-                  params: {
-                    allowedValues:
-                      schema31.properties.curves.properties.sources.properties.training_examples
-                        .enum,
-                  },
-                  message: 'must be equal to one of the allowed values',
-                };
-                if (vErrors === null) {
-                  vErrors = [err104];
-                } else {
-                  vErrors.push(err104);
-                }
-                errors++;
-              }
-            }
-            if (data51.regularization !== undefined) {
-              let data54 = data51.regularization;
-              if (!(data54 === 'held-out' || data54 === 'cross-validation')) {
-                const err105 = {
-                  instancePath: instancePath + '/curves/sources/regularization',
-                  schemaPath:
-                    '#/properties/curves/properties/sources/properties/regularization/enum',
-                  keyword: 'enum',
-                  params: {
-                    allowedValues:
-                      schema31.properties.curves.properties.sources.properties.regularization.enum,
-                  },
-                  message: 'must be equal to one of the allowed values',
-                };
-                if (vErrors === null) {
-                  vErrors = [err105];
-                } else {
-                  vErrors.push(err105);
-                }
-                errors++;
-              }
-            }
-          } else {
-            const err106 = {
-              instancePath: instancePath + '/curves/sources',
-              schemaPath: '#/properties/curves/properties/sources/type',
-              keyword: 'type',
-              params: { type: 'object' },
-              message: 'must be object',
-            };
-            if (vErrors === null) {
-              vErrors = [err106];
-            } else {
-              vErrors.push(err106);
-            }
-            errors++;
-          }
-        }
-      } else {
-        const err107 = {
-          instancePath: instancePath + '/curves',
-          schemaPath: '#/properties/curves/type',
-          keyword: 'type',
-          params: { type: 'object' },
-          message: 'must be object',
-        };
-        if (vErrors === null) {
-          vErrors = [err107];
-        } else {
-          vErrors.push(err107);
-        }
-        errors++;
-      }
-    }
-    if (data.slices !== undefined) {
-      let data55 = data.slices;
-      if (Array.isArray(data55)) {
-        const len7 = data55.length;
-        for (let i7 = 0; i7 < len7; i7++) {
-          let data56 = data55[i7];
-          if (data56 && typeof data56 == 'object' && !Array.isArray(data56)) {
-            if (data56.name === undefined) {
-              const err108 = {
-                instancePath: instancePath + '/slices/' + i7,
-                schemaPath: '#/properties/slices/items/required',
-                keyword: 'required',
-                params: { missingProperty: 'name' },
-                message: "must have required property '" + 'name' + "'",
-              };
-              if (vErrors === null) {
-                vErrors = [err108];
-              } else {
-                vErrors.push(err108);
-              }
-              errors++;
-            }
-            if (data56.validation === undefined) {
-              const err109 = {
-                instancePath: instancePath + '/slices/' + i7,
-                schemaPath: '#/properties/slices/items/required',
-                keyword: 'required',
-                params: { missingProperty: 'validation' },
-                message: "must have required property '" + 'validation' + "'",
-              };
-              if (vErrors === null) {
-                vErrors = [err109];
-              } else {
-                vErrors.push(err109);
-              }
-              errors++;
-            }
-            for (const key13 in data56) {
-              if (!(
-                key13 === 'name' ||
-                key13 === 'examples' ||
-                key13 === 'train' ||
-                key13 === 'validation'
-              )) {
-                const err110 = {
-                  instancePath: instancePath + '/slices/' + i7,
-                  schemaPath: '#/properties/slices/items/additionalProperties',
-                  keyword: 'additionalProperties',
-                  params: { additionalProperty: key13 },
-                  message: 'must NOT have additional properties',
-                };
-                if (vErrors === null) {
-                  vErrors = [err110];
-                } else {
-                  vErrors.push(err110);
-                }
-                errors++;
-              }
-            }
-            if (data56.name !== undefined) {
-              let data57 = data56.name;
-              if (typeof data57 === 'string') {
-                if (func2(data57) < 1) {
-                  const err111 = {
-                    instancePath: instancePath + '/slices/' + i7 + '/name',
-                    schemaPath: '#/properties/slices/items/properties/name/minLength',
-                    keyword: 'minLength',
-                    params: { limit: 1 },
-                    message: 'must NOT have fewer than 1 characters',
-                  };
-                  if (vErrors === null) {
-                    vErrors = [err111];
-                  } else {
-                    vErrors.push(err111);
-                  }
-                  errors++;
-                }
-              } else {
-                const err112 = {
-                  instancePath: instancePath + '/slices/' + i7 + '/name',
-                  schemaPath: '#/properties/slices/items/properties/name/type',
-                  keyword: 'type',
-                  params: { type: 'string' },
-                  message: 'must be string',
-                };
-                if (vErrors === null) {
-                  vErrors = [err112];
-                } else {
-                  vErrors.push(err112);
-                }
-                errors++;
-              }
-            }
-            if (data56.examples !== undefined) {
-              let data58 = data56.examples;
-              if (!(
-                typeof data58 == 'number' &&
-                !(data58 % 1) &&
-                !isNaN(data58) &&
-                isFinite(data58)
-              )) {
-                const err113 = {
-                  instancePath: instancePath + '/slices/' + i7 + '/examples',
-                  schemaPath: '#/properties/slices/items/properties/examples/type',
-                  keyword: 'type',
-                  params: { type: 'integer' },
-                  message: 'must be integer',
-                };
-                if (vErrors === null) {
-                  vErrors = [err113];
-                } else {
-                  vErrors.push(err113);
-                }
-                errors++;
-              }
-              if (typeof data58 == 'number' && isFinite(data58)) {
-                if (data58 < 1 || isNaN(data58)) {
-                  const err114 = {
-                    instancePath: instancePath + '/slices/' + i7 + '/examples',
-                    schemaPath: '#/properties/slices/items/properties/examples/minimum',
-                    keyword: 'minimum',
-                    params: { comparison: '>=', limit: 1 },
-                    message: 'must be >= 1',
-                  };
-                  if (vErrors === null) {
-                    vErrors = [err114];
-                  } else {
-                    vErrors.push(err114);
-                  }
-                  errors++;
-                }
-              }
-            }
-            if (data56.train !== undefined) {
-              let data59 = data56.train;
-              if (!(typeof data59 == 'number' && isFinite(data59))) {
-                const err115 = {
-                  instancePath: instancePath + '/slices/' + i7 + '/train',
-                  schemaPath: '#/properties/slices/items/properties/train/type',
-                  keyword: 'type',
-                  params: { type: 'number' },
-                  message: 'must be number',
-                };
-                if (vErrors === null) {
-                  vErrors = [err115];
-                } else {
-                  vErrors.push(err115);
-                }
-                errors++;
-              }
-            }
-            if (data56.validation !== undefined) {
-              let data60 = data56.validation;
-              if (!(typeof data60 == 'number' && isFinite(data60))) {
-                const err116 = {
-                  instancePath: instancePath + '/slices/' + i7 + '/validation',
-                  schemaPath: '#/properties/slices/items/properties/validation/type',
-                  keyword: 'type',
-                  params: { type: 'number' },
-                  message: 'must be number',
-                };
-                if (vErrors === null) {
-                  vErrors = [err116];
-                } else {
-                  vErrors.push(err116);
-                }
-                errors++;
-              }
-            }
-          } else {
-            const err117 = {
-              instancePath: instancePath + '/slices/' + i7,
-              schemaPath: '#/properties/slices/items/type',
-              keyword: 'type',
-              params: { type: 'object' },
-              message: 'must be object',
-            };
-            if (vErrors === null) {
-              vErrors = [err117];
-            } else {
-              vErrors.push(err117);
-            }
-            errors++;
-          }
-        }
-      } else {
-        const err118 = {
-          instancePath: instancePath + '/slices',
-          schemaPath: '#/properties/slices/type',
-          keyword: 'type',
-          params: { type: 'array' },
-          message: 'must be array',
-        };
-        if (vErrors === null) {
-          vErrors = [err118];
-        } else {
-          vErrors.push(err118);
-        }
-        errors++;
-      }
-    }
-    if (data.predictions !== undefined) {
-      let data61 = data.predictions;
-      if (data61 && typeof data61 == 'object' && !Array.isArray(data61)) {
-        if (data61.split === undefined) {
-          const err119 = {
-            instancePath: instancePath + '/predictions',
-            schemaPath: '#/properties/predictions/required',
-            keyword: 'required',
-            params: { missingProperty: 'split' },
-            message: "must have required property '" + 'split' + "'",
-          };
-          if (vErrors === null) {
-            vErrors = [err119];
-          } else {
-            vErrors.push(err119);
-          }
-          errors++;
-        }
-        if (data61.path === undefined) {
-          const err120 = {
-            instancePath: instancePath + '/predictions',
-            schemaPath: '#/properties/predictions/required',
-            keyword: 'required',
-            params: { missingProperty: 'path' },
-            message: "must have required property '" + 'path' + "'",
-          };
-          if (vErrors === null) {
-            vErrors = [err120];
-          } else {
-            vErrors.push(err120);
-          }
-          errors++;
-        }
-        for (const key14 in data61) {
-          if (!(
-            key14 === 'split' ||
-            key14 === 'path' ||
-            key14 === 'aggregate' ||
-            key14 === 'repeat'
-          )) {
-            const err121 = {
-              instancePath: instancePath + '/predictions',
-              schemaPath: '#/properties/predictions/additionalProperties',
-              keyword: 'additionalProperties',
-              params: { additionalProperty: key14 },
-              message: 'must NOT have additional properties',
-            };
-            if (vErrors === null) {
-              vErrors = [err121];
-            } else {
-              vErrors.push(err121);
-            }
-            errors++;
-          }
-        }
-        if (data61.split !== undefined) {
-          let data62 = data61.split;
-          if (!(
-            data62 === 'train' ||
-            data62 === 'train_dev' ||
-            data62 === 'validation' ||
-            data62 === 'test'
-          )) {
-            const err122 = {
-              instancePath: instancePath + '/predictions/split',
-              schemaPath: '#/properties/predictions/properties/split/enum',
-              keyword: 'enum',
-              params: { allowedValues: schema31.properties.predictions.properties.split.enum },
-              message: 'must be equal to one of the allowed values',
-            };
-            if (vErrors === null) {
-              vErrors = [err122];
-            } else {
-              vErrors.push(err122);
-            }
-            errors++;
-          }
-        }
-        if (data61.path !== undefined) {
-          let data63 = data61.path;
-          if (typeof data63 === 'string') {
-            if (func2(data63) < 1) {
-              const err123 = {
-                instancePath: instancePath + '/predictions/path',
-                schemaPath: '#/properties/predictions/properties/path/minLength',
-                keyword: 'minLength',
-                params: { limit: 1 },
-                message: 'must NOT have fewer than 1 characters',
-              };
-              if (vErrors === null) {
-                vErrors = [err123];
-              } else {
-                vErrors.push(err123);
-              }
-              errors++;
-            }
-          } else {
-            const err124 = {
-              instancePath: instancePath + '/predictions/path',
-              schemaPath: '#/properties/predictions/properties/path/type',
-              keyword: 'type',
-              params: { type: 'string' },
-              message: 'must be string',
-            };
-            if (vErrors === null) {
-              vErrors = [err124];
-            } else {
-              vErrors.push(err124);
-            }
-            errors++;
-          }
-        }
-        if (data61.aggregate !== undefined) {
-          let data64 = data61.aggregate;
-          if (!(data64 === 'mean' || data64 === 'rmse' || data64 === 'sum')) {
-            const err125 = {
-              instancePath: instancePath + '/predictions/aggregate',
-              schemaPath: '#/properties/predictions/properties/aggregate/enum',
-              keyword: 'enum',
-              params: { allowedValues: schema31.properties.predictions.properties.aggregate.enum },
-              message: 'must be equal to one of the allowed values',
-            };
-            if (vErrors === null) {
-              vErrors = [err125];
-            } else {
-              vErrors.push(err125);
-            }
-            errors++;
-          }
-        }
-        if (data61.repeat !== undefined) {
-          let data65 = data61.repeat;
-          if (!(typeof data65 == 'number' && !(data65 % 1) && !isNaN(data65) && isFinite(data65))) {
-            const err126 = {
-              instancePath: instancePath + '/predictions/repeat',
-              schemaPath: '#/properties/predictions/properties/repeat/type',
-              keyword: 'type',
-              params: { type: 'integer' },
-              message: 'must be integer',
-            };
-            if (vErrors === null) {
-              vErrors = [err126];
-            } else {
-              vErrors.push(err126);
-            }
-            errors++;
-          }
-          if (typeof data65 == 'number' && isFinite(data65)) {
-            if (data65 < 0 || isNaN(data65)) {
-              const err127 = {
-                instancePath: instancePath + '/predictions/repeat',
-                schemaPath: '#/properties/predictions/properties/repeat/minimum',
-                keyword: 'minimum',
-                params: { comparison: '>=', limit: 0 },
-                message: 'must be >= 0',
-              };
-              if (vErrors === null) {
-                vErrors = [err127];
-              } else {
-                vErrors.push(err127);
-              }
-              errors++;
-            }
-          }
-        }
-      } else {
-        const err128 = {
-          instancePath: instancePath + '/predictions',
-          schemaPath: '#/properties/predictions/type',
-          keyword: 'type',
-          params: { type: 'object' },
-          message: 'must be object',
-        };
-        if (vErrors === null) {
-          vErrors = [err128];
-        } else {
-          vErrors.push(err128);
-        }
-        errors++;
-      }
-    }
-    if (data.guardrails !== undefined) {
-      let data66 = data.guardrails;
-      if (Array.isArray(data66)) {
-        if (data66.length > 50) {
-          const err129 = {
-            instancePath: instancePath + '/guardrails',
-            schemaPath: '#/properties/guardrails/maxItems',
-            keyword: 'maxItems',
-            params: { limit: 50 },
-            message: 'must NOT have more than 50 items',
-          };
-          if (vErrors === null) {
-            vErrors = [err129];
-          } else {
-            vErrors.push(err129);
-          }
-          errors++;
-        }
-        const len8 = data66.length;
-        for (let i8 = 0; i8 < len8; i8++) {
-          let data67 = data66[i8];
-          if (data67 && typeof data67 == 'object' && !Array.isArray(data67)) {
-            if (data67.metric === undefined) {
-              const err130 = {
-                instancePath: instancePath + '/guardrails/' + i8,
-                schemaPath: '#/properties/guardrails/items/required',
-                keyword: 'required',
-                params: { missingProperty: 'metric' },
-                message: "must have required property '" + 'metric' + "'",
-              };
-              if (vErrors === null) {
-                vErrors = [err130];
-              } else {
-                vErrors.push(err130);
-              }
-              errors++;
-            }
-            if (data67.splits === undefined) {
-              const err131 = {
-                instancePath: instancePath + '/guardrails/' + i8,
-                schemaPath: '#/properties/guardrails/items/required',
-                keyword: 'required',
-                params: { missingProperty: 'splits' },
-                message: "must have required property '" + 'splits' + "'",
-              };
-              if (vErrors === null) {
-                vErrors = [err131];
-              } else {
-                vErrors.push(err131);
-              }
-              errors++;
-            }
-            for (const key15 in data67) {
-              if (!(key15 === 'metric' || key15 === 'splits' || key15 === 'margin')) {
-                const err132 = {
-                  instancePath: instancePath + '/guardrails/' + i8,
-                  schemaPath: '#/properties/guardrails/items/additionalProperties',
-                  keyword: 'additionalProperties',
-                  params: { additionalProperty: key15 },
-                  message: 'must NOT have additional properties',
-                };
-                if (vErrors === null) {
-                  vErrors = [err132];
-                } else {
-                  vErrors.push(err132);
-                }
-                errors++;
-              }
-            }
-            if (data67.metric !== undefined) {
-              let data68 = data67.metric;
-              if (data68 && typeof data68 == 'object' && !Array.isArray(data68)) {
-                if (data68.name === undefined) {
-                  const err133 = {
-                    instancePath: instancePath + '/guardrails/' + i8 + '/metric',
-                    schemaPath: '#/properties/guardrails/items/properties/metric/required',
-                    keyword: 'required',
-                    params: { missingProperty: 'name' },
-                    message: "must have required property '" + 'name' + "'",
-                  };
-                  if (vErrors === null) {
-                    vErrors = [err133];
-                  } else {
-                    vErrors.push(err133);
-                  }
-                  errors++;
-                }
-                if (data68.goal === undefined) {
-                  const err134 = {
-                    instancePath: instancePath + '/guardrails/' + i8 + '/metric',
-                    schemaPath: '#/properties/guardrails/items/properties/metric/required',
-                    keyword: 'required',
-                    params: { missingProperty: 'goal' },
-                    message: "must have required property '" + 'goal' + "'",
-                  };
-                  if (vErrors === null) {
-                    vErrors = [err134];
-                  } else {
-                    vErrors.push(err134);
-                  }
-                  errors++;
-                }
-                if (data68.kind === undefined) {
-                  const err135 = {
-                    instancePath: instancePath + '/guardrails/' + i8 + '/metric',
-                    schemaPath: '#/properties/guardrails/items/properties/metric/required',
-                    keyword: 'required',
-                    params: { missingProperty: 'kind' },
-                    message: "must have required property '" + 'kind' + "'",
-                  };
-                  if (vErrors === null) {
-                    vErrors = [err135];
-                  } else {
-                    vErrors.push(err135);
-                  }
-                  errors++;
-                }
-                for (const key16 in data68) {
-                  if (!(
-                    key16 === 'name' ||
-                    key16 === 'goal' ||
-                    key16 === 'kind' ||
-                    key16 === 'best' ||
-                    key16 === 'unit'
-                  )) {
-                    const err136 = {
-                      instancePath: instancePath + '/guardrails/' + i8 + '/metric',
-                      schemaPath:
-                        '#/properties/guardrails/items/properties/metric/additionalProperties',
-                      keyword: 'additionalProperties',
-                      params: { additionalProperty: key16 },
-                      message: 'must NOT have additional properties',
-                    };
-                    if (vErrors === null) {
-                      vErrors = [err136];
-                    } else {
-                      vErrors.push(err136);
-                    }
-                    errors++;
-                  }
-                }
-                if (data68.name !== undefined) {
-                  let data69 = data68.name;
-                  if (typeof data69 === 'string') {
-                    if (func2(data69) > 100) {
-                      const err137 = {
-                        instancePath: instancePath + '/guardrails/' + i8 + '/metric/name',
-                        schemaPath:
-                          '#/properties/guardrails/items/properties/metric/properties/name/maxLength',
-                        keyword: 'maxLength',
-                        params: { limit: 100 },
-                        message: 'must NOT have more than 100 characters',
-                      };
-                      if (vErrors === null) {
-                        vErrors = [err137];
-                      } else {
-                        vErrors.push(err137);
-                      }
-                      errors++;
-                    }
-                    if (func2(data69) < 1) {
-                      const err138 = {
-                        instancePath: instancePath + '/guardrails/' + i8 + '/metric/name',
-                        schemaPath:
-                          '#/properties/guardrails/items/properties/metric/properties/name/minLength',
-                        keyword: 'minLength',
-                        params: { limit: 1 },
-                        message: 'must NOT have fewer than 1 characters',
-                      };
-                      if (vErrors === null) {
-                        vErrors = [err138];
-                      } else {
-                        vErrors.push(err138);
-                      }
-                      errors++;
-                    }
-                  } else {
-                    const err139 = {
-                      instancePath: instancePath + '/guardrails/' + i8 + '/metric/name',
-                      schemaPath:
-                        '#/properties/guardrails/items/properties/metric/properties/name/type',
-                      keyword: 'type',
-                      params: { type: 'string' },
-                      message: 'must be string',
-                    };
-                    if (vErrors === null) {
-                      vErrors = [err139];
-                    } else {
-                      vErrors.push(err139);
-                    }
-                    errors++;
-                  }
-                }
-                if (data68.goal !== undefined) {
-                  let data70 = data68.goal;
-                  if (!(data70 === 'minimize' || data70 === 'maximize')) {
-                    const err140 = {
-                      instancePath: instancePath + '/guardrails/' + i8 + '/metric/goal',
-                      schemaPath:
-                        '#/properties/guardrails/items/properties/metric/properties/goal/enum',
-                      keyword: 'enum',
-                      params: {
-                        allowedValues:
-                          schema31.properties.guardrails.items.properties.metric.properties.goal
-                            .enum,
-                      },
-                      message: 'must be equal to one of the allowed values',
-                    };
-                    if (vErrors === null) {
-                      vErrors = [err140];
-                    } else {
-                      vErrors.push(err140);
-                    }
-                    errors++;
-                  }
-                }
-                if (data68.kind !== undefined) {
-                  let data71 = data68.kind;
-                  if (!(data71 === 'proportion' || data71 === 'continuous')) {
-                    const err141 = {
-                      instancePath: instancePath + '/guardrails/' + i8 + '/metric/kind',
-                      schemaPath:
-                        '#/properties/guardrails/items/properties/metric/properties/kind/enum',
-                      keyword: 'enum',
-                      params: {
-                        allowedValues:
-                          schema31.properties.guardrails.items.properties.metric.properties.kind
-                            .enum,
-                      },
-                      message: 'must be equal to one of the allowed values',
-                    };
-                    if (vErrors === null) {
-                      vErrors = [err141];
-                    } else {
-                      vErrors.push(err141);
-                    }
-                    errors++;
-                  }
-                }
-                if (data68.best !== undefined) {
-                  let data72 = data68.best;
-                  if (!(typeof data72 == 'number' && isFinite(data72))) {
-                    const err142 = {
-                      instancePath: instancePath + '/guardrails/' + i8 + '/metric/best',
-                      schemaPath:
-                        '#/properties/guardrails/items/properties/metric/properties/best/type',
-                      keyword: 'type',
-                      params: { type: 'number' },
-                      message: 'must be number',
-                    };
-                    if (vErrors === null) {
-                      vErrors = [err142];
-                    } else {
-                      vErrors.push(err142);
-                    }
-                    errors++;
-                  }
-                }
-                if (data68.unit !== undefined) {
-                  let data73 = data68.unit;
-                  if (typeof data73 === 'string') {
-                    if (func2(data73) > 40) {
-                      const err143 = {
-                        instancePath: instancePath + '/guardrails/' + i8 + '/metric/unit',
-                        schemaPath:
-                          '#/properties/guardrails/items/properties/metric/properties/unit/maxLength',
-                        keyword: 'maxLength',
-                        params: { limit: 40 },
-                        message: 'must NOT have more than 40 characters',
-                      };
-                      if (vErrors === null) {
-                        vErrors = [err143];
-                      } else {
-                        vErrors.push(err143);
-                      }
-                      errors++;
-                    }
-                    if (func2(data73) < 1) {
-                      const err144 = {
-                        instancePath: instancePath + '/guardrails/' + i8 + '/metric/unit',
-                        schemaPath:
-                          '#/properties/guardrails/items/properties/metric/properties/unit/minLength',
-                        keyword: 'minLength',
-                        params: { limit: 1 },
-                        message: 'must NOT have fewer than 1 characters',
-                      };
-                      if (vErrors === null) {
-                        vErrors = [err144];
-                      } else {
-                        vErrors.push(err144);
-                      }
-                      errors++;
-                    }
-                  } else {
-                    const err145 = {
-                      instancePath: instancePath + '/guardrails/' + i8 + '/metric/unit',
-                      schemaPath:
-                        '#/properties/guardrails/items/properties/metric/properties/unit/type',
-                      keyword: 'type',
-                      params: { type: 'string' },
-                      message: 'must be string',
-                    };
-                    if (vErrors === null) {
-                      vErrors = [err145];
-                    } else {
-                      vErrors.push(err145);
-                    }
-                    errors++;
-                  }
-                }
-              } else {
-                const err146 = {
-                  instancePath: instancePath + '/guardrails/' + i8 + '/metric',
-                  schemaPath: '#/properties/guardrails/items/properties/metric/type',
-                  keyword: 'type',
-                  params: { type: 'object' },
-                  message: 'must be object',
-                };
-                if (vErrors === null) {
-                  vErrors = [err146];
-                } else {
-                  vErrors.push(err146);
-                }
-                errors++;
-              }
-            }
-            if (data67.splits !== undefined) {
-              let data74 = data67.splits;
-              if (data74 && typeof data74 == 'object' && !Array.isArray(data74)) {
-                if (data74.validation === undefined) {
-                  const err147 = {
-                    instancePath: instancePath + '/guardrails/' + i8 + '/splits',
-                    schemaPath: '#/properties/guardrails/items/properties/splits/required',
-                    keyword: 'required',
-                    params: { missingProperty: 'validation' },
-                    message: "must have required property '" + 'validation' + "'",
-                  };
-                  if (vErrors === null) {
-                    vErrors = [err147];
-                  } else {
-                    vErrors.push(err147);
-                  }
-                  errors++;
-                }
-                for (const key17 in data74) {
-                  if (!(key17 === 'validation' || key17 === 'test')) {
-                    const err148 = {
-                      instancePath: instancePath + '/guardrails/' + i8 + '/splits',
-                      schemaPath:
-                        '#/properties/guardrails/items/properties/splits/additionalProperties',
-                      keyword: 'additionalProperties',
-                      params: { additionalProperty: key17 },
-                      message: 'must NOT have additional properties',
-                    };
-                    if (vErrors === null) {
-                      vErrors = [err148];
-                    } else {
-                      vErrors.push(err148);
-                    }
-                    errors++;
-                  }
-                }
-                if (data74.validation !== undefined) {
-                  let data75 = data74.validation;
-                  if (data75 && typeof data75 == 'object' && !Array.isArray(data75)) {
-                    if (data75.values === undefined) {
-                      const err149 = {
-                        instancePath: instancePath + '/guardrails/' + i8 + '/splits/validation',
-                        schemaPath: '#/$defs/split/required',
-                        keyword: 'required',
-                        params: { missingProperty: 'values' },
-                        message: "must have required property '" + 'values' + "'",
-                      };
-                      if (vErrors === null) {
-                        vErrors = [err149];
-                      } else {
-                        vErrors.push(err149);
-                      }
-                      errors++;
-                    }
-                    for (const key18 in data75) {
-                      if (!(
-                        key18 === 'examples' ||
-                        key18 === 'values' ||
-                        key18 === 'evaluationRows'
-                      )) {
-                        const err150 = {
-                          instancePath: instancePath + '/guardrails/' + i8 + '/splits/validation',
-                          schemaPath: '#/$defs/split/additionalProperties',
-                          keyword: 'additionalProperties',
-                          params: { additionalProperty: key18 },
-                          message: 'must NOT have additional properties',
-                        };
-                        if (vErrors === null) {
-                          vErrors = [err150];
-                        } else {
-                          vErrors.push(err150);
-                        }
-                        errors++;
-                      }
-                    }
-                    if (data75.examples !== undefined) {
-                      let data76 = data75.examples;
-                      if (!(
-                        typeof data76 == 'number' &&
-                        !(data76 % 1) &&
-                        !isNaN(data76) &&
-                        isFinite(data76)
-                      )) {
-                        const err151 = {
-                          instancePath:
-                            instancePath + '/guardrails/' + i8 + '/splits/validation/examples',
-                          schemaPath: '#/$defs/split/properties/examples/type',
-                          keyword: 'type',
-                          params: { type: 'integer' },
-                          message: 'must be integer',
-                        };
-                        if (vErrors === null) {
-                          vErrors = [err151];
-                        } else {
-                          vErrors.push(err151);
-                        }
-                        errors++;
-                      }
-                      if (typeof data76 == 'number' && isFinite(data76)) {
-                        if (data76 < 1 || isNaN(data76)) {
-                          const err152 = {
-                            instancePath:
-                              instancePath + '/guardrails/' + i8 + '/splits/validation/examples',
-                            schemaPath: '#/$defs/split/properties/examples/minimum',
-                            keyword: 'minimum',
-                            params: { comparison: '>=', limit: 1 },
-                            message: 'must be >= 1',
-                          };
-                          if (vErrors === null) {
-                            vErrors = [err152];
-                          } else {
-                            vErrors.push(err152);
-                          }
-                          errors++;
-                        }
-                      }
-                    }
-                    if (data75.values !== undefined) {
-                      let data77 = data75.values;
-                      if (Array.isArray(data77)) {
-                        if (data77.length < 1) {
-                          const err153 = {
-                            instancePath:
-                              instancePath + '/guardrails/' + i8 + '/splits/validation/values',
-                            schemaPath: '#/$defs/split/properties/values/minItems',
-                            keyword: 'minItems',
-                            params: { limit: 1 },
-                            message: 'must NOT have fewer than 1 items',
-                          };
-                          if (vErrors === null) {
-                            vErrors = [err153];
-                          } else {
-                            vErrors.push(err153);
-                          }
-                          errors++;
-                        }
-                        const len9 = data77.length;
-                        for (let i9 = 0; i9 < len9; i9++) {
-                          let data78 = data77[i9];
-                          if (!(typeof data78 == 'number' && isFinite(data78))) {
-                            const err154 = {
-                              instancePath:
-                                instancePath +
-                                '/guardrails/' +
-                                i8 +
-                                '/splits/validation/values/' +
-                                i9,
-                              schemaPath: '#/$defs/split/properties/values/items/type',
-                              keyword: 'type',
-                              params: { type: 'number' },
-                              message: 'must be number',
-                            };
-                            if (vErrors === null) {
-                              vErrors = [err154];
-                            } else {
-                              vErrors.push(err154);
-                            }
-                            errors++;
-                          }
-                        }
-                      } else {
-                        const err155 = {
-                          instancePath:
-                            instancePath + '/guardrails/' + i8 + '/splits/validation/values',
-                          schemaPath: '#/$defs/split/properties/values/type',
-                          keyword: 'type',
-                          params: { type: 'array' },
-                          message: 'must be array',
-                        };
-                        if (vErrors === null) {
-                          vErrors = [err155];
-                        } else {
-                          vErrors.push(err155);
-                        }
-                        errors++;
-                      }
-                    }
-                    if (data75.evaluationRows !== undefined) {
-                      let data79 = data75.evaluationRows;
-                      if (!(data79 === 'fixed' || data79 === 'per-repeat')) {
-                        const err156 = {
-                          instancePath:
-                            instancePath +
-                            '/guardrails/' +
-                            i8 +
-                            '/splits/validation/evaluationRows',
-                          schemaPath: '#/$defs/split/properties/evaluationRows/enum',
-                          keyword: 'enum',
-                          params: { allowedValues: schema32.properties.evaluationRows.enum },
-                          message: 'must be equal to one of the allowed values',
-                        };
-                        if (vErrors === null) {
-                          vErrors = [err156];
-                        } else {
-                          vErrors.push(err156);
-                        }
-                        errors++;
-                      }
-                    }
-                  } else {
-                    const err157 = {
-                      instancePath: instancePath + '/guardrails/' + i8 + '/splits/validation',
-                      schemaPath: '#/$defs/split/type',
-                      keyword: 'type',
-                      params: { type: 'object' },
-                      message: 'must be object',
-                    };
-                    if (vErrors === null) {
-                      vErrors = [err157];
-                    } else {
-                      vErrors.push(err157);
-                    }
-                    errors++;
-                  }
-                }
-                if (data74.test !== undefined) {
-                  let data80 = data74.test;
-                  if (data80 && typeof data80 == 'object' && !Array.isArray(data80)) {
-                    if (data80.values === undefined) {
-                      const err158 = {
-                        instancePath: instancePath + '/guardrails/' + i8 + '/splits/test',
-                        schemaPath: '#/$defs/split/required',
-                        keyword: 'required',
-                        params: { missingProperty: 'values' },
-                        message: "must have required property '" + 'values' + "'",
-                      };
-                      if (vErrors === null) {
-                        vErrors = [err158];
-                      } else {
-                        vErrors.push(err158);
-                      }
-                      errors++;
-                    }
-                    for (const key19 in data80) {
-                      if (!(
-                        key19 === 'examples' ||
-                        key19 === 'values' ||
-                        key19 === 'evaluationRows'
-                      )) {
-                        const err159 = {
-                          instancePath: instancePath + '/guardrails/' + i8 + '/splits/test',
-                          schemaPath: '#/$defs/split/additionalProperties',
-                          keyword: 'additionalProperties',
-                          params: { additionalProperty: key19 },
-                          message: 'must NOT have additional properties',
-                        };
-                        if (vErrors === null) {
-                          vErrors = [err159];
-                        } else {
-                          vErrors.push(err159);
-                        }
-                        errors++;
-                      }
-                    }
-                    if (data80.examples !== undefined) {
-                      let data81 = data80.examples;
-                      if (!(
-                        typeof data81 == 'number' &&
-                        !(data81 % 1) &&
-                        !isNaN(data81) &&
-                        isFinite(data81)
-                      )) {
-                        const err160 = {
-                          instancePath:
-                            instancePath + '/guardrails/' + i8 + '/splits/test/examples',
-                          schemaPath: '#/$defs/split/properties/examples/type',
-                          keyword: 'type',
-                          params: { type: 'integer' },
-                          message: 'must be integer',
-                        };
-                        if (vErrors === null) {
-                          vErrors = [err160];
-                        } else {
-                          vErrors.push(err160);
-                        }
-                        errors++;
-                      }
-                      if (typeof data81 == 'number' && isFinite(data81)) {
-                        if (data81 < 1 || isNaN(data81)) {
-                          const err161 = {
-                            instancePath:
-                              instancePath + '/guardrails/' + i8 + '/splits/test/examples',
-                            schemaPath: '#/$defs/split/properties/examples/minimum',
-                            keyword: 'minimum',
-                            params: { comparison: '>=', limit: 1 },
-                            message: 'must be >= 1',
-                          };
-                          if (vErrors === null) {
-                            vErrors = [err161];
-                          } else {
-                            vErrors.push(err161);
-                          }
-                          errors++;
-                        }
-                      }
-                    }
-                    if (data80.values !== undefined) {
-                      let data82 = data80.values;
-                      if (Array.isArray(data82)) {
-                        if (data82.length < 1) {
-                          const err162 = {
-                            instancePath:
-                              instancePath + '/guardrails/' + i8 + '/splits/test/values',
-                            schemaPath: '#/$defs/split/properties/values/minItems',
-                            keyword: 'minItems',
-                            params: { limit: 1 },
-                            message: 'must NOT have fewer than 1 items',
-                          };
-                          if (vErrors === null) {
-                            vErrors = [err162];
-                          } else {
-                            vErrors.push(err162);
-                          }
-                          errors++;
-                        }
-                        const len10 = data82.length;
-                        for (let i10 = 0; i10 < len10; i10++) {
-                          let data83 = data82[i10];
-                          if (!(typeof data83 == 'number' && isFinite(data83))) {
-                            const err163 = {
-                              instancePath:
-                                instancePath + '/guardrails/' + i8 + '/splits/test/values/' + i10,
-                              schemaPath: '#/$defs/split/properties/values/items/type',
-                              keyword: 'type',
-                              params: { type: 'number' },
-                              message: 'must be number',
-                            };
-                            if (vErrors === null) {
-                              vErrors = [err163];
-                            } else {
-                              vErrors.push(err163);
-                            }
-                            errors++;
-                          }
-                        }
-                      } else {
-                        const err164 = {
-                          instancePath: instancePath + '/guardrails/' + i8 + '/splits/test/values',
-                          schemaPath: '#/$defs/split/properties/values/type',
-                          keyword: 'type',
-                          params: { type: 'array' },
-                          message: 'must be array',
-                        };
-                        if (vErrors === null) {
-                          vErrors = [err164];
-                        } else {
-                          vErrors.push(err164);
-                        }
-                        errors++;
-                      }
-                    }
-                    if (data80.evaluationRows !== undefined) {
-                      let data84 = data80.evaluationRows;
-                      if (!(data84 === 'fixed' || data84 === 'per-repeat')) {
-                        const err165 = {
-                          instancePath:
-                            instancePath + '/guardrails/' + i8 + '/splits/test/evaluationRows',
-                          schemaPath: '#/$defs/split/properties/evaluationRows/enum',
-                          keyword: 'enum',
-                          params: { allowedValues: schema32.properties.evaluationRows.enum },
-                          message: 'must be equal to one of the allowed values',
-                        };
-                        if (vErrors === null) {
-                          vErrors = [err165];
-                        } else {
-                          vErrors.push(err165);
-                        }
-                        errors++;
-                      }
-                    }
-                  } else {
-                    const err166 = {
-                      instancePath: instancePath + '/guardrails/' + i8 + '/splits/test',
-                      schemaPath: '#/$defs/split/type',
-                      keyword: 'type',
-                      params: { type: 'object' },
-                      message: 'must be object',
-                    };
-                    if (vErrors === null) {
-                      vErrors = [err166];
-                    } else {
-                      vErrors.push(err166);
-                    }
-                    errors++;
-                  }
-                }
-              } else {
-                const err167 = {
-                  instancePath: instancePath + '/guardrails/' + i8 + '/splits',
-                  schemaPath: '#/properties/guardrails/items/properties/splits/type',
-                  keyword: 'type',
-                  params: { type: 'object' },
-                  message: 'must be object',
-                };
-                if (vErrors === null) {
-                  vErrors = [err167];
-                } else {
-                  vErrors.push(err167);
-                }
-                errors++;
-              }
-            }
-            if (data67.margin !== undefined) {
-              let data85 = data67.margin;
-              if (typeof data85 == 'number' && isFinite(data85)) {
-                if (data85 < 0 || isNaN(data85)) {
-                  const err168 = {
-                    instancePath: instancePath + '/guardrails/' + i8 + '/margin',
-                    schemaPath: '#/properties/guardrails/items/properties/margin/minimum',
-                    keyword: 'minimum',
-                    params: { comparison: '>=', limit: 0 },
-                    message: 'must be >= 0',
-                  };
-                  if (vErrors === null) {
-                    vErrors = [err168];
-                  } else {
-                    vErrors.push(err168);
-                  }
-                  errors++;
-                }
-              } else {
-                const err169 = {
-                  instancePath: instancePath + '/guardrails/' + i8 + '/margin',
-                  schemaPath: '#/properties/guardrails/items/properties/margin/type',
-                  keyword: 'type',
-                  params: { type: 'number' },
-                  message: 'must be number',
-                };
-                if (vErrors === null) {
-                  vErrors = [err169];
-                } else {
-                  vErrors.push(err169);
-                }
-                errors++;
-              }
-            }
-          } else {
-            const err170 = {
-              instancePath: instancePath + '/guardrails/' + i8,
-              schemaPath: '#/properties/guardrails/items/type',
-              keyword: 'type',
-              params: { type: 'object' },
-              message: 'must be object',
-            };
-            if (vErrors === null) {
-              vErrors = [err170];
-            } else {
-              vErrors.push(err170);
-            }
-            errors++;
-          }
-        }
-      } else {
-        const err171 = {
-          instancePath: instancePath + '/guardrails',
-          schemaPath: '#/properties/guardrails/type',
-          keyword: 'type',
-          params: { type: 'array' },
-          message: 'must be array',
-        };
-        if (vErrors === null) {
-          vErrors = [err171];
-        } else {
-          vErrors.push(err171);
-        }
-        errors++;
-      }
-    }
-    if (data.cost !== undefined) {
-      let data86 = data.cost;
-      if (data86 && typeof data86 == 'object' && !Array.isArray(data86)) {
-        for (const key20 in data86) {
-          if (!(
-            key20 === 'trainSeconds' ||
-            key20 === 'inferenceMs' ||
-            key20 === 'parameters' ||
-            key20 === 'memoryMb'
-          )) {
-            const err172 = {
-              instancePath: instancePath + '/cost',
-              schemaPath: '#/properties/cost/additionalProperties',
-              keyword: 'additionalProperties',
-              params: { additionalProperty: key20 },
-              message: 'must NOT have additional properties',
-            };
-            if (vErrors === null) {
-              vErrors = [err172];
-            } else {
-              vErrors.push(err172);
-            }
-            errors++;
-          }
-        }
-        if (data86.trainSeconds !== undefined) {
-          let data87 = data86.trainSeconds;
-          if (Array.isArray(data87)) {
-            if (data87.length < 1) {
-              const err173 = {
-                instancePath: instancePath + '/cost/trainSeconds',
-                schemaPath: '#/properties/cost/properties/trainSeconds/minItems',
-                keyword: 'minItems',
-                params: { limit: 1 },
-                message: 'must NOT have fewer than 1 items',
-              };
-              if (vErrors === null) {
-                vErrors = [err173];
-              } else {
-                vErrors.push(err173);
-              }
-              errors++;
-            }
-            const len11 = data87.length;
-            for (let i11 = 0; i11 < len11; i11++) {
-              let data88 = data87[i11];
-              if (typeof data88 == 'number' && isFinite(data88)) {
-                if (data88 <= 0 || isNaN(data88)) {
-                  const err174 = {
-                    instancePath: instancePath + '/cost/trainSeconds/' + i11,
-                    schemaPath: '#/properties/cost/properties/trainSeconds/items/exclusiveMinimum',
-                    keyword: 'exclusiveMinimum',
-                    params: { comparison: '>', limit: 0 },
-                    message: 'must be > 0',
-                  };
-                  if (vErrors === null) {
-                    vErrors = [err174];
-                  } else {
-                    vErrors.push(err174);
-                  }
-                  errors++;
-                }
-              } else {
-                const err175 = {
-                  instancePath: instancePath + '/cost/trainSeconds/' + i11,
-                  schemaPath: '#/properties/cost/properties/trainSeconds/items/type',
-                  keyword: 'type',
-                  params: { type: 'number' },
-                  message: 'must be number',
-                };
-                if (vErrors === null) {
-                  vErrors = [err175];
-                } else {
-                  vErrors.push(err175);
-                }
-                errors++;
-              }
-            }
-          } else {
-            const err176 = {
-              instancePath: instancePath + '/cost/trainSeconds',
-              schemaPath: '#/properties/cost/properties/trainSeconds/type',
-              keyword: 'type',
-              params: { type: 'array' },
-              message: 'must be array',
-            };
-            if (vErrors === null) {
-              vErrors = [err176];
-            } else {
-              vErrors.push(err176);
-            }
-            errors++;
-          }
-        }
-        if (data86.inferenceMs !== undefined) {
-          let data89 = data86.inferenceMs;
-          if (Array.isArray(data89)) {
-            if (data89.length < 1) {
-              const err177 = {
-                instancePath: instancePath + '/cost/inferenceMs',
-                schemaPath: '#/properties/cost/properties/inferenceMs/minItems',
-                keyword: 'minItems',
-                params: { limit: 1 },
-                message: 'must NOT have fewer than 1 items',
-              };
-              if (vErrors === null) {
-                vErrors = [err177];
-              } else {
-                vErrors.push(err177);
-              }
-              errors++;
-            }
-            const len12 = data89.length;
-            for (let i12 = 0; i12 < len12; i12++) {
-              let data90 = data89[i12];
-              if (typeof data90 == 'number' && isFinite(data90)) {
-                if (data90 <= 0 || isNaN(data90)) {
-                  const err178 = {
-                    instancePath: instancePath + '/cost/inferenceMs/' + i12,
-                    schemaPath: '#/properties/cost/properties/inferenceMs/items/exclusiveMinimum',
-                    keyword: 'exclusiveMinimum',
-                    params: { comparison: '>', limit: 0 },
-                    message: 'must be > 0',
-                  };
-                  if (vErrors === null) {
-                    vErrors = [err178];
-                  } else {
-                    vErrors.push(err178);
-                  }
-                  errors++;
-                }
-              } else {
-                const err179 = {
-                  instancePath: instancePath + '/cost/inferenceMs/' + i12,
-                  schemaPath: '#/properties/cost/properties/inferenceMs/items/type',
-                  keyword: 'type',
-                  params: { type: 'number' },
-                  message: 'must be number',
-                };
-                if (vErrors === null) {
-                  vErrors = [err179];
-                } else {
-                  vErrors.push(err179);
-                }
-                errors++;
-              }
-            }
-          } else {
-            const err180 = {
-              instancePath: instancePath + '/cost/inferenceMs',
-              schemaPath: '#/properties/cost/properties/inferenceMs/type',
-              keyword: 'type',
-              params: { type: 'array' },
-              message: 'must be array',
-            };
-            if (vErrors === null) {
-              vErrors = [err180];
-            } else {
-              vErrors.push(err180);
-            }
-            errors++;
-          }
-        }
-        if (data86.parameters !== undefined) {
-          let data91 = data86.parameters;
-          if (typeof data91 == 'number' && isFinite(data91)) {
-            if (data91 <= 0 || isNaN(data91)) {
-              const err181 = {
-                instancePath: instancePath + '/cost/parameters',
-                schemaPath: '#/properties/cost/properties/parameters/exclusiveMinimum',
-                keyword: 'exclusiveMinimum',
-                params: { comparison: '>', limit: 0 },
-                message: 'must be > 0',
-              };
-              if (vErrors === null) {
-                vErrors = [err181];
-              } else {
-                vErrors.push(err181);
-              }
-              errors++;
-            }
-          } else {
-            const err182 = {
-              instancePath: instancePath + '/cost/parameters',
-              schemaPath: '#/properties/cost/properties/parameters/type',
-              keyword: 'type',
-              params: { type: 'number' },
-              message: 'must be number',
-            };
-            if (vErrors === null) {
-              vErrors = [err182];
-            } else {
-              vErrors.push(err182);
-            }
-            errors++;
-          }
-        }
-        if (data86.memoryMb !== undefined) {
-          let data92 = data86.memoryMb;
-          if (typeof data92 == 'number' && isFinite(data92)) {
-            if (data92 <= 0 || isNaN(data92)) {
-              const err183 = {
+        if (data50.memoryMb !== undefined) {
+          let data56 = data50.memoryMb;
+          if (typeof data56 == 'number' && isFinite(data56)) {
+            if (data56 <= 0 || isNaN(data56)) {
+              const err102 = {
                 instancePath: instancePath + '/cost/memoryMb',
                 schemaPath: '#/properties/cost/properties/memoryMb/exclusiveMinimum',
                 keyword: 'exclusiveMinimum',
@@ -3574,14 +2573,14 @@ function validate20(
                 message: 'must be > 0',
               };
               if (vErrors === null) {
-                vErrors = [err183];
+                vErrors = [err102];
               } else {
-                vErrors.push(err183);
+                vErrors.push(err102);
               }
               errors++;
             }
           } else {
-            const err184 = {
+            const err103 = {
               instancePath: instancePath + '/cost/memoryMb',
               schemaPath: '#/properties/cost/properties/memoryMb/type',
               keyword: 'type',
@@ -3589,15 +2588,15 @@ function validate20(
               message: 'must be number',
             };
             if (vErrors === null) {
-              vErrors = [err184];
+              vErrors = [err103];
             } else {
-              vErrors.push(err184);
+              vErrors.push(err103);
             }
             errors++;
           }
         }
       } else {
-        const err185 = {
+        const err104 = {
           instancePath: instancePath + '/cost',
           schemaPath: '#/properties/cost/type',
           keyword: 'type',
@@ -3605,15 +2604,15 @@ function validate20(
           message: 'must be object',
         };
         if (vErrors === null) {
-          vErrors = [err185];
+          vErrors = [err104];
         } else {
-          vErrors.push(err185);
+          vErrors.push(err104);
         }
         errors++;
       }
     }
   } else {
-    const err186 = {
+    const err105 = {
       instancePath,
       schemaPath: '#/type',
       keyword: 'type',
@@ -3621,13 +2620,13 @@ function validate20(
       message: 'must be object',
     };
     if (vErrors === null) {
-      vErrors = [err186];
+      vErrors = [err105];
     } else {
-      vErrors.push(err186);
+      vErrors.push(err105);
     }
     errors++;
   }
-  validate20.errors = vErrors;
+  validate52.errors = vErrors;
   return errors === 0;
 }
-validate20.evaluated = { props: true, dynamicProps: false, dynamicItems: false };
+validate52.evaluated = { props: true, dynamicProps: false, dynamicItems: false };
