@@ -44,6 +44,13 @@ export const TUNING: PairingTuning = {
   maxWindow: 262144,
   growFrom: 1 << 21,
 };
+/**
+ * The first windows are this many steps at most, so that settling a window (rare in a long run of
+ * paired rows) has run a few times before V8 compiles the loop; otherwise the compiled loop is
+ * thrown away at the first full window and recompiled (see WARM_READS in prediction-lines.ts).
+ */
+const WARM_WINDOW = 256;
+const WARM_SETTLES = 8;
 /** Table slots per step of the window below which the window doubles (see PairingTuning). */
 const SLOTS_PER_STEP = 16;
 /** Loss values beyond this can overflow a difference: then pairs are settled step by step. */
@@ -82,6 +89,7 @@ export class Pairing {
   private window: number;
   private ringUsed = false;
   private strict = false;
+  private settles = 0;
   /** The last step's rows had the same id (then each file's previous id is the same too). */
   private lockstep = false;
   private readonly orderA = new IdOrder();
@@ -98,9 +106,9 @@ export class Pairing {
     private readonly tuning: PairingTuning,
   ) {
     this.proportion = kind === 'proportion';
-    this.window = tuning.window;
-    this.batch = new IdBatch(2 * this.window);
-    this.ring = new Float64Array(this.proportion ? 0 : 3 * this.window).fill(Number.NaN);
+    this.window = Math.min(tuning.window, WARM_WINDOW);
+    this.batch = new IdBatch(2 * tuning.window);
+    this.ring = new Float64Array(this.proportion ? 0 : 3 * tuning.window).fill(Number.NaN);
   }
 
   run(): number {
@@ -242,6 +250,7 @@ export class Pairing {
     }
     this.windowStart = this.step;
     const { table, tuning } = this;
+    if (++this.settles === WARM_SETTLES) this.window = tuning.window;
     if (
       this.window < tuning.maxWindow &&
       table.slots >= tuning.growFrom &&

@@ -26,6 +26,16 @@ import type { ByteReader } from './byte-readers.js';
 export { lazyReader, streamReader, type ByteReader } from './byte-readers.js';
 
 export const CHUNK = 1 << 20;
+/**
+ * The first WARM_READS reads take at most WARM_BYTES each. A read that ends inside a row sends the
+ * row loop down the paths of a cut row (back to the caller for more bytes); V8 compiles the loop
+ * with what it has seen so far, so when those paths had never run, the first 1 MiB boundary threw
+ * the compiled loop away (a deoptimization), and the loop ran slow again until it was recompiled
+ * (issue 14: 7–20 ms of compiler time each on a busy 2-core machine). Small first reads run those
+ * paths a few dozen times while the loop is still interpreted; the rows and their order do not change.
+ */
+const WARM_READS = 48;
+const WARM_BYTES = 1024;
 /** `advance()` results. */
 export const ROW = 1;
 export const END = 0;
@@ -108,6 +118,7 @@ export class PredictionLines {
   private eof = false;
   private pending: string[] | null = null;
   private pendingAt = 0;
+  private reads = 0;
   private scratch: Buffer = Buffer.allocUnsafe(256);
   private scratchView = viewOf(this.scratch);
   /** A copy of the last row's id when its bytes are about to be overwritten. */
@@ -141,7 +152,9 @@ export class PredictionLines {
     } else if (this.pos > 0) this.buf.copyWithin(0, this.pos, this.end);
     this.pos = 0;
     this.end = rest;
-    const n = await this.reader.read(this.buf, rest, this.buf.length - rest);
+    const room = this.buf.length - rest;
+    const want = this.reads++ < WARM_READS ? Math.min(room, WARM_BYTES) : room;
+    const n = await this.reader.read(this.buf, rest, want);
     if (n === 0) this.eof = true;
     else this.end += n;
   }

@@ -323,3 +323,48 @@ describe('PredictionLines number fast path', () => {
     expect(await losses('id,loss\na,1e15\nb,-1000000000000000\n', 5)).toEqual([1e15, -1e15]);
   });
 });
+
+describe('PredictionLines reads', () => {
+  it('asks for small reads first, then whole buffers, and reads every row either way', async () => {
+    // The first reads are small so that the paths of a row cut by the end of a buffer run before
+    // V8 compiles the row loop (prediction-lines.ts, WARM_READS); the rows must not change.
+    const rows = 20_000;
+    const data = Buffer.from(
+      `id,correct\n${Array.from({ length: rows }, (_, i) => `row-${i},${i % 3 === 0 ? 1 : 0}\n`).join('')}`,
+    );
+    const asked: number[] = [];
+    let at = 0;
+    const lines = new PredictionLines(
+      {
+        async read(into, offset, length) {
+          asked.push(length);
+          const n = Math.min(length, data.length - at);
+          into.set(data.subarray(at, at + n), offset);
+          at += n;
+          return n;
+        },
+        async close() {},
+      },
+      'p.csv',
+      'proportion',
+    );
+    let ones = 0;
+    let count = 0;
+    for (;;) {
+      let r = lines.advance();
+      while (r === NEED) {
+        await lines.fill();
+        r = lines.advance();
+      }
+      if (r !== ROW) break;
+      expect(lines.id()).toBe(`row-${count}`);
+      ones += lines.value;
+      count++;
+    }
+    expect(count).toBe(rows);
+    expect(ones).toBe(Math.ceil(rows / 3));
+    // Common practice (a 1 KiB read ends inside a row of about 10 bytes most of the time).
+    expect(asked.slice(0, 48).every((n) => n <= 1024)).toBe(true);
+    expect(Math.max(...asked.slice(48))).toBeGreaterThan(1024 * 1024 - 1024);
+  });
+});
