@@ -134,9 +134,7 @@ export function renderText(review: Review, options: TextOptions): string {
 /** Columns a table needs without cutting any cell. */
 function naturalWidth(t: Table): number {
   const rows = [t.header, ...t.rows];
-  const widths = t.header.map((_, c) =>
-    Math.max(...rows.map((r) => Array.from(r[c] ?? '').length)),
-  );
+  const widths = t.header.map((_, c) => Math.max(...rows.map((r) => codePoints(r[c] ?? ''))));
   return 2 + widths.reduce((a, b) => a + b, 0) + 2 * (widths.length - 1);
 }
 
@@ -148,6 +146,16 @@ function withoutColumn(t: Table, header: string): Table {
   return { ...t, header: drop(t.header), align: drop(t.align), rows: t.rows.map(drop) };
 }
 
+const SURROGATE = /[\uD800-\uDFFF]/;
+
+/**
+ * Code points in s, as `Array.from(s).length` counts them (a surrogate pair is one), without
+ * building the array when s has no surrogates (then every code unit is one code point).
+ */
+function codePoints(s: string): number {
+  return SURROGATE.test(s) ? Array.from(s).length : s.length;
+}
+
 /** Word-wraps to `width` columns; the first line starts with `first`, the others with `indent`. */
 export function wrap(text: string, width: number, indent: string, first = indent): string[] {
   const lines: string[] = [];
@@ -155,7 +163,7 @@ export function wrap(text: string, width: number, indent: string, first = indent
   let empty = true;
   for (const word of text.split(' ').filter((w) => w !== '')) {
     const candidate = empty ? `${line}${word}` : `${line} ${word}`;
-    if (Array.from(candidate).length <= width) {
+    if (codePoints(candidate) <= width) {
       line = candidate;
       empty = false;
       continue;
@@ -163,8 +171,8 @@ export function wrap(text: string, width: number, indent: string, first = indent
     if (!empty) lines.push(line);
     let rest = word;
     line = lines.length === 0 && empty ? first : indent;
-    while (Array.from(line + rest).length > width) {
-      const room = Math.max(1, width - Array.from(line).length);
+    while (codePoints(line + rest) > width) {
+      const room = Math.max(1, width - codePoints(line));
       const points = Array.from(rest);
       lines.push(line + points.slice(0, room).join(''));
       rest = points.slice(room).join('');
@@ -183,7 +191,7 @@ export function wrap(text: string, width: number, indent: string, first = indent
  * enough (very narrow terminals), every column is.
  */
 export function textTable(t: Table, width: number): string[] {
-  const len = (s: string): number => Array.from(s).length;
+  const len = codePoints;
   const rows = [t.header, ...t.rows];
   const widths = t.header.map((_, c) => Math.max(...rows.map((r) => len(r[c] ?? ''))));
   const total = (): number => 2 + widths.reduce((a, b) => a + b, 0) + 2 * (widths.length - 1);

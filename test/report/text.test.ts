@@ -1,3 +1,4 @@
+import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import type { Review } from '../../src/model/review.js';
 import { renderText, textTable, wrap } from '../../src/report/text.js';
@@ -87,6 +88,55 @@ describe('wrap and textTable', () => {
   it('wraps on spaces with a hanging indent and splits over-long words', () => {
     expect(wrap('aaa bbb ccc', 8, '  ', '* ')).toEqual(['* aaa', '  bbb', '  ccc']);
     expect(wrap('x'.repeat(12), 6, '', '')).toEqual(['xxxxxx', 'xxxxxx']);
+  });
+
+  it('wraps exactly as counting code points with Array.from does, surrogates included (property)', () => {
+    // Reference: the plain wrap that measures every candidate line with Array.from (ECMA-262
+    // §22.1.5.1: a string iterates by code points; a lone surrogate is one), naive and quadratic.
+    const naive = (text: string, width: number, indent: string, first = indent): string[] => {
+      const len = (x: string): number => Array.from(x).length;
+      const lines: string[] = [];
+      let line = first;
+      let empty = true;
+      for (const word of text.split(' ').filter((w) => w !== '')) {
+        const candidate = empty ? `${line}${word}` : `${line} ${word}`;
+        if (len(candidate) <= width) {
+          line = candidate;
+          empty = false;
+          continue;
+        }
+        if (!empty) lines.push(line);
+        let rest = word;
+        line = lines.length === 0 && empty ? first : indent;
+        while (len(line + rest) > width) {
+          const room = Math.max(1, width - len(line));
+          const points = Array.from(rest);
+          lines.push(line + points.slice(0, room).join(''));
+          rest = points.slice(room).join('');
+          line = indent;
+        }
+        line = `${line}${rest}`;
+        empty = false;
+      }
+      if (!empty || lines.length === 0) lines.push(line.trimEnd());
+      return lines;
+    };
+    const piece = fc.oneof(
+      fc.constantFrom(' ', '  ', 'a', 'word', '😀', '\uD83D', '\uDE00', 'é', '表'),
+      fc.string({ unit: 'binary', maxLength: 6 }),
+    );
+    fc.assert(
+      fc.property(
+        fc.array(piece, { maxLength: 40 }).map((p) => p.join('')),
+        fc.integer({ min: 4, max: 30 }),
+        fc.constantFrom('', '  ', '\uDE00'),
+        fc.constantFrom('', '* ', '\uD83D'),
+        (text, width, indent, first) => {
+          expect(wrap(text, width, indent, first)).toEqual(naive(text, width, indent, first));
+        },
+      ),
+      { numRuns: 500 },
+    );
   });
 
   it('narrows text columns with an ellipsis to fit', () => {
