@@ -51,6 +51,9 @@ export const TUNING: PairingTuning = {
  */
 const WARM_WINDOW = 256;
 const WARM_SETTLES = 8;
+/** Likewise, the first WARM_FLUSHES batches of loss differences hold WARM_BATCH values at most. */
+const WARM_BATCH = 64;
+const WARM_FLUSHES = 8;
 /** Table slots per step of the window below which the window doubles (see PairingTuning). */
 const SLOTS_PER_STEP = 16;
 /** Loss values beyond this can overflow a difference: then pairs are settled step by step. */
@@ -96,6 +99,9 @@ export class Pairing {
   private readonly orderB = new IdOrder();
   private readonly pending = new Float64Array(BATCH);
   private pendingCount = 0;
+  /** Differences that fill a batch: WARM_BATCH for the first WARM_FLUSHES batches, then BATCH. */
+  private batchOf = WARM_BATCH;
+  private flushes = 0;
   private readonly proportion: boolean;
 
   constructor(
@@ -185,7 +191,7 @@ export class Pairing {
           const d = y - x;
           if (d - d !== 0) this.refuse(d);
           this.pending[this.pendingCount++] = d;
-          if (this.pendingCount === BATCH) this.flush();
+          if (this.pendingCount === this.batchOf) this.flush();
         }
       } else {
         this.ringUsed = !this.proportion;
@@ -243,7 +249,7 @@ export class Pairing {
         if (d === d) {
           if (d - d !== 0) this.refuse(d);
           this.pending[this.pendingCount++] = d;
-          if (this.pendingCount === BATCH) this.flush();
+          if (this.pendingCount === this.batchOf) this.flush();
           ring[i] = Number.NaN;
         }
       }
@@ -336,5 +342,6 @@ export class Pairing {
   flush(): void {
     this.diffs.pushAll(this.pending, this.pendingCount);
     this.pendingCount = 0;
+    if (++this.flushes === WARM_FLUSHES) this.batchOf = BATCH;
   }
 }
