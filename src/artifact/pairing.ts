@@ -18,6 +18,8 @@ export const NEED_B = 2;
 const ADVANCE_A = 0;
 const ADVANCE_B = 1;
 const PAIR = 2;
+/** Steps of one call of the lockstep loop (see `lockstepRows`). */
+const BLOCK = 2048;
 /** Loss differences are handed to RunningStats in batches (a double argument is an allocation). */
 const BATCH = 4096;
 /**
@@ -122,6 +124,10 @@ export class Pairing {
     let batch = this.batch;
     for (;;) {
       if (this.phase === ADVANCE_A) {
+        if (this.lockstep && this.proportion && this.unordered === 0) {
+          this.lockstepRows();
+          batch = this.batch;
+        }
         if (this.hasA) {
           const r = a.advance();
           if (r === NEED) return NEED_A;
@@ -223,6 +229,120 @@ export class Pairing {
       }
       this.phase = ADVANCE_A;
     }
+  }
+
+  /**
+   * The common case of `run()` in one tight loop: both files in step (the last rows had the same
+   * id), 0/1 values, ids increasing. Each row pair is read from the two buffers by the byte path's
+   * rules, and taken only when the rows are `ID,V\n` lines wholly in their buffers with the same
+   * id, following the last one in order; the pair then counts exactly as one step of `run()`
+   * counts it (the same Welford updates, counts and order checks; the window settles at the same
+   * steps). Anything else stops the loop before that row, and `run()` reads it. Why: one loop
+   * without a call or a field write per row is about 1.6 times as fast as the general step
+   * (issue 14). The loop itself is in `lockstepBlock`, which stops at the end of a window, so that
+   * V8 compiles it without the settling code (a compile of the two together took 36 ms).
+   */
+  private lockstepRows(): void {
+    const { a, b } = this;
+    if (a.pending !== null || b.pending !== null || !this.hasA || !this.hasB) return;
+    for (;;) {
+      const room = this.window - (this.step - this.windowStart);
+      if (room < 1) return; // not expected: run() settles after a full window
+      // Blocks of at most BLOCK steps: once V8 has compiled the loop, the next block runs the
+      // compiled code, without waiting for a replacement of the running one (on-stack replacement).
+      const block = room < BLOCK ? room : BLOCK;
+      const taken = this.lockstepBlock(block);
+      if (taken < block) return;
+      if (taken === room) this.settle();
+    }
+  }
+
+  /** Up to `room` steps of `lockstepRows`; how many were taken. */
+  private lockstepBlock(room: number): number {
+    const { a, b } = this;
+    const ba = a.buf;
+    const bb = b.buf;
+    const va = a.view;
+    const vb = b.view;
+    const ea = a.end;
+    const eb = b.end;
+    const s = this.sides;
+    const orderA = this.orderA;
+    const orderB = this.orderB;
+    let pa = a.pos;
+    let pb = b.pos;
+    // The previous row (of both files: the same id).
+    let prevView = a.keyView;
+    let prevStart = a.keyStart;
+    let prevLen = a.keyLen;
+    // The last rows taken (their ids have the same length in both files) and the ones before.
+    let lastA = 0;
+    let lastB = 0;
+    let lastLen = 0;
+    let beforeA = 0;
+    let beforeB = 0;
+    let beforeLen = 0;
+    let x = 0;
+    let y = 0;
+    let count = 0;
+    let baselineOnly = 0;
+    let candidateOnly = 0;
+    while (count < room) {
+      // Row of the baseline: ID up to the comma, then 0 or 1, then a newline, all in the buffer.
+      let p = pa;
+      let c = p < ea ? (ba[p] as number) : 0;
+      while (c > 32 && c < 127 && c !== 44) c = ++p < ea ? (ba[p] as number) : 0;
+      const len = p - pa;
+      if (c !== 44 || len === 0 || p + 2 >= ea) break;
+      const xa = ba[p + 1] as number;
+      if ((xa !== 48 && xa !== 49) || ba[p + 2] !== 10) break;
+      // Row of the candidate, the same way.
+      let q = pb;
+      c = q < eb ? (bb[q] as number) : 0;
+      while (c > 32 && c < 127 && c !== 44) c = ++q < eb ? (bb[q] as number) : 0;
+      if (c !== 44 || q + 2 >= eb) break;
+      const yb = bb[q + 1] as number;
+      if ((yb !== 48 && yb !== 49) || bb[q + 2] !== 10) break;
+      if (!sameIds(va, pa, len, vb, pb, q - pb)) break;
+      const code = idSteps(va, pa, len, prevView, prevStart, prevLen);
+      if (!orderA.take(code) || !orderB.take(code)) break;
+      // Taken: the same arithmetic, in the same order, as run().
+      x = xa - 48;
+      y = yb - 48;
+      let n = (s[0] as number) + 1;
+      s[0] = n;
+      let delta = x - (s[1] as number);
+      s[1] = (s[1] as number) + delta / n;
+      s[2] = (s[2] as number) + delta * (x - (s[1] as number));
+      n = (s[3] as number) + 1;
+      s[3] = n;
+      delta = y - (s[4] as number);
+      s[4] = (s[4] as number) + delta / n;
+      s[5] = (s[5] as number) + delta * (y - (s[4] as number));
+      if (x === 1 && y === 0) baselineOnly++;
+      else if (x === 0 && y === 1) candidateOnly++;
+      beforeA = lastA;
+      beforeB = lastB;
+      beforeLen = lastLen;
+      lastA = pa;
+      lastB = pb;
+      lastLen = len;
+      prevView = va;
+      prevStart = pa;
+      prevLen = len;
+      pa = p + 3;
+      pb = q + 3;
+      count++;
+    }
+    if (count > 0) {
+      this.rows += count;
+      this.step += count;
+      this.baselineOnly += baselineOnly;
+      this.candidateOnly += candidateOnly;
+      a.took(count, lastA, lastLen, x, beforeA, beforeLen, pa);
+      b.took(count, lastB, lastLen, y, beforeB, beforeLen, pb);
+    }
+    return count;
   }
 
   /**

@@ -108,15 +108,20 @@ export class PredictionLines {
   prevStart = 0;
   prevLen = -1;
 
-  private buf: Buffer = Buffer.allocUnsafe(CHUNK);
+  /**
+   * The bytes read and not yet dropped: rows from `pos` to `end`. `buf`, `view`, `pos`, `end` and
+   * `pending` are read by the lockstep loop of pairing.ts, which takes rows through `took`.
+   */
+  buf: Buffer = Buffer.allocUnsafe(CHUNK);
   /** `buf` read four bytes at a time (digits eight at a time in `number`). */
-  private view = viewOf(this.buf);
-  private pos = 0;
+  view = viewOf(this.buf);
+  pos = 0;
   /** Bytes before `buf[0]`. */
   private dropped = 0;
-  private end = 0;
+  end = 0;
   private eof = false;
-  private pending: string[] | null = null;
+  /** Lines decoded by the string rules, not yet read (null: none). */
+  pending: string[] | null = null;
   private pendingAt = 0;
   private reads = 0;
   private scratch: Buffer = Buffer.allocUnsafe(256);
@@ -237,6 +242,42 @@ export class PredictionLines {
       this.pos = p;
       return ROW;
     }
+  }
+
+  /**
+   * Takes `count` ≥ 1 rows that the lockstep loop read from `buf` by the byte path's rules (the
+   * fields are then as after as many ROWs from `advance()`): the last at `[start, start + len)`
+   * with `value`, the one before it at `[prevStart, prevStart + prevLen)` (when count ≥ 2), and the
+   * next row at `next`.
+   */
+  took(
+    count: number,
+    start: number,
+    len: number,
+    value: number,
+    prevStart: number,
+    prevLen: number,
+    next: number,
+  ): void {
+    if (count === 1) {
+      this.prevKey = this.key;
+      this.prevView = this.keyView;
+      this.prevStart = this.keyStart;
+      this.prevLen = this.rows === 0 ? -1 : this.keyLen;
+    } else {
+      this.prevKey = this.buf;
+      this.prevView = this.view;
+      this.prevStart = prevStart;
+      this.prevLen = prevLen;
+    }
+    this.key = this.buf;
+    this.keyView = this.view;
+    this.keyStart = start;
+    this.keyLen = len;
+    this.value = value;
+    this.line += count;
+    this.rows += count;
+    this.pos = next;
   }
 
   /**

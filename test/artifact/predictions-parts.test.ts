@@ -17,6 +17,7 @@ import {
 import { IdOrder, sameIds } from '../../src/artifact/id-compare.js';
 import { Readable } from 'node:stream';
 import { IdBatch, MEET_BASE } from '../../src/artifact/id-batch.js';
+import { DONE, NEED_A, Pairing, TUNING } from '../../src/artifact/pairing.js';
 import { NEED, PredictionLines, ROW, streamReader } from '../../src/artifact/prediction-lines.js';
 import { InputError } from '../../src/model/errors.js';
 import { MAX_MAGNITUDE } from '../../src/model/limits.js';
@@ -366,5 +367,59 @@ describe('PredictionLines reads', () => {
     // Common practice (a 1 KiB read ends inside a row of about 10 bytes most of the time).
     expect(asked.slice(0, 48).every((n) => n <= 1024)).toBe(true);
     expect(Math.max(...asked.slice(48))).toBeGreaterThan(1024 * 1024 - 1024);
+  });
+});
+
+describe('Pairing lockstep loop', () => {
+  it("leaves each file's id, previous id, line and value as reading row by row would", async () => {
+    // Reference: the file's own rows (row k is r-k with value k mod 2 or (k + 1) mod 2). The
+    // candidate has a blank line after its header, so its rows sit at other offsets in its buffer.
+    const rows = 5000;
+    const body = (salt: number): string =>
+      Array.from({ length: rows }, (_, i) => `r-${i},${(i + salt) % 2}\n`).join('');
+    const reader = (text: string): PredictionLines => {
+      const data = Buffer.from(text);
+      let at = 0;
+      return new PredictionLines(
+        {
+          async read(into, offset, length) {
+            const n = Math.min(length, data.length - at, 3000);
+            into.set(data.subarray(at, at + n), offset);
+            at += n;
+            return n;
+          },
+          async close() {},
+        },
+        'f.csv',
+        'proportion',
+      );
+    };
+    const a = reader(`id,correct\n${body(0)}`);
+    const b = reader(`id,correct\n\n${body(1)}`);
+    const pairing = new Pairing(a, b, new IdTable(false), 'proportion', TUNING);
+    const prevId = (l: PredictionLines): string =>
+      l.prevKey.toString('utf8', l.prevStart, l.prevStart + l.prevLen);
+    let checks = 0;
+    for (let r = pairing.run(); r !== DONE; r = pairing.run()) {
+      for (const [l, salt, blank] of [
+        [a, 0, 0],
+        [b, 1, 1],
+      ] as const) {
+        if (l.rows >= 2) {
+          expect(l.id()).toBe(`r-${l.rows - 1}`);
+          expect(prevId(l)).toBe(`r-${l.rows - 2}`);
+          expect(l.value).toBe((l.rows - 1 + salt) % 2);
+          expect(l.line).toBe(l.rows + 1 + blank);
+          checks++;
+        }
+      }
+      if (r === NEED_A) await a.fill();
+      else await b.fill();
+    }
+    expect(checks).toBeGreaterThan(10);
+    expect(pairing.rows).toBe(rows);
+    // Pairs where the baseline is right (1) and the candidate wrong (0): the odd rows.
+    expect(pairing.baselineOnly).toBe(rows / 2);
+    expect(pairing.candidateOnly).toBe(rows / 2);
   });
 });
