@@ -124,7 +124,7 @@ export class Pairing {
     let batch = this.batch;
     for (;;) {
       if (this.phase === ADVANCE_A) {
-        if (this.lockstep && this.proportion && this.unordered === 0) {
+        if (this.lockstep && this.unordered === 0 && !this.strict) {
           this.lockstepRows();
           batch = this.batch;
         }
@@ -233,14 +233,16 @@ export class Pairing {
 
   /**
    * The common case of `run()` in one tight loop: both files in step (the last rows had the same
-   * id), 0/1 values, ids increasing. Each row pair is read from the two buffers by the byte path's
-   * rules, and taken only when the rows are `ID,V\n` lines wholly in their buffers with the same
-   * id, following the last one in order; the pair then counts exactly as one step of `run()`
-   * counts it (the same Welford updates, counts and order checks; the window settles at the same
-   * steps). Anything else stops the loop before that row, and `run()` reads it. Why: one loop
-   * without a call or a field write per row is about 1.6 times as fast as the general step
-   * (issue 14). The loop itself is in `lockstepBlock`, which stops at the end of a window, so that
-   * V8 compiles it without the settling code (a compile of the two together took 36 ms).
+   * id) and ids increasing. Each row pair is read from the two buffers by the byte path's rules,
+   * and taken only when the rows are `ID,V\n` lines wholly in their buffers (V: 0 or 1, or a loss
+   * the byte path reads) with the same id, following the last one in order; the pair then counts
+   * exactly as one step of `run()` counts it (the same Welford updates, counts, differences and
+   * order checks; the window settles and the batch of differences flushes at the same steps).
+   * Anything else stops the loop before that row, and `run()` reads it. Why: one loop without a
+   * call (0/1 values) or a field write per row is about 1.6 times as fast as the general step,
+   * and V8 compiles it sooner (issue 14). The loop itself is in `lockstepBlock`, which stops at
+   * the end of a window or batch, so that V8 compiles it without the settling code (a compile of
+   * the two together took 36 ms).
    */
   private lockstepRows(): void {
     const { a, b } = this;
@@ -250,8 +252,12 @@ export class Pairing {
       if (room < 1) return; // not expected: run() settles after a full window
       // Blocks of at most BLOCK steps: once V8 has compiled the loop, the next block runs the
       // compiled code, without waiting for a replacement of the running one (on-stack replacement).
-      const block = room < BLOCK ? room : BLOCK;
+      // Losses: a block also ends where the batch of differences is full, flushed here.
+      const free = this.proportion || this.ringUsed ? BLOCK : this.batchOf - this.pendingCount;
+      if (free < 1) return; // not expected: run() flushes a full batch at once
+      const block = Math.min(room, BLOCK, free);
       const taken = this.lockstepBlock(block);
+      if (!this.proportion && this.pendingCount === this.batchOf) this.flush();
       if (taken < block) return;
       if (taken === room) this.settle();
     }
@@ -287,28 +293,60 @@ export class Pairing {
     let count = 0;
     let baselineOnly = 0;
     let candidateOnly = 0;
+    const valueA = a.value;
+    const valueB = b.value;
+    const proportion = this.proportion;
+    const ringUsed = this.ringUsed;
+    const ring = this.ring;
+    const pending = this.pending;
+    let pendingCount = this.pendingCount;
+    let step = this.step;
+    const windowStart = this.windowStart;
     while (count < room) {
       // Row of the baseline: ID up to the comma, then 0 or 1, then a newline, all in the buffer.
       let p = pa;
       let c = p < ea ? (ba[p] as number) : 0;
       while (c > 32 && c < 127 && c !== 44) c = ++p < ea ? (ba[p] as number) : 0;
       const len = p - pa;
-      if (c !== 44 || len === 0 || p + 2 >= ea) break;
-      const xa = ba[p + 1] as number;
-      if ((xa !== 48 && xa !== 49) || ba[p + 2] !== 10) break;
+      if (c !== 44 || len === 0) break;
+      let nextA: number;
+      let xv: number;
+      if (proportion) {
+        if (p + 2 >= ea) break;
+        const xa = ba[p + 1] as number;
+        if ((xa !== 48 && xa !== 49) || ba[p + 2] !== 10) break;
+        xv = xa - 48;
+        nextA = p + 3;
+      } else {
+        // A plain decimal within ±1e15 and a newline (prediction-lines.ts `number`), else -1.
+        nextA = a.number(p + 1);
+        if (nextA < 0) break;
+        xv = a.value;
+      }
       // Row of the candidate, the same way.
       let q = pb;
       c = q < eb ? (bb[q] as number) : 0;
       while (c > 32 && c < 127 && c !== 44) c = ++q < eb ? (bb[q] as number) : 0;
-      if (c !== 44 || q + 2 >= eb) break;
-      const yb = bb[q + 1] as number;
-      if ((yb !== 48 && yb !== 49) || bb[q + 2] !== 10) break;
+      if (c !== 44) break;
+      let nextB: number;
+      let yv: number;
+      if (proportion) {
+        if (q + 2 >= eb) break;
+        const yb = bb[q + 1] as number;
+        if ((yb !== 48 && yb !== 49) || bb[q + 2] !== 10) break;
+        yv = yb - 48;
+        nextB = q + 3;
+      } else {
+        nextB = b.number(q + 1);
+        if (nextB < 0) break;
+        yv = b.value;
+      }
       if (!sameIds(va, pa, len, vb, pb, q - pb)) break;
       const code = idSteps(va, pa, len, prevView, prevStart, prevLen);
       if (!orderA.take(code) || !orderB.take(code)) break;
       // Taken: the same arithmetic, in the same order, as run().
-      x = xa - 48;
-      y = yb - 48;
+      x = xv;
+      y = yv;
       let n = (s[0] as number) + 1;
       s[0] = n;
       let delta = x - (s[1] as number);
@@ -319,8 +357,15 @@ export class Pairing {
       delta = y - (s[4] as number);
       s[4] = (s[4] as number) + delta / n;
       s[5] = (s[5] as number) + delta * (y - (s[4] as number));
-      if (x === 1 && y === 0) baselineOnly++;
-      else if (x === 0 && y === 1) candidateOnly++;
+      if (proportion) {
+        if (x === 1 && y === 0) baselineOnly++;
+        else if (x === 0 && y === 1) candidateOnly++;
+      } else if (ringUsed) ring[(step - windowStart) * 3] = y - x;
+      else {
+        // Within ±1e15 on the byte path: never HUGE (run()'s strict mode) and always finite.
+        pending[pendingCount++] = y - x;
+      }
+      step++;
       beforeA = lastA;
       beforeB = lastB;
       beforeLen = lastLen;
@@ -330,17 +375,22 @@ export class Pairing {
       prevView = va;
       prevStart = pa;
       prevLen = len;
-      pa = p + 3;
-      pb = q + 3;
+      pa = nextA;
+      pb = nextB;
       count++;
     }
     if (count > 0) {
       this.rows += count;
-      this.step += count;
+      this.step = step;
+      this.pendingCount = pendingCount;
       this.baselineOnly += baselineOnly;
       this.candidateOnly += candidateOnly;
       a.took(count, lastA, lastLen, x, beforeA, beforeLen, pa);
       b.took(count, lastB, lastLen, y, beforeB, beforeLen, pb);
+    } else {
+      // A loss read for a row not taken replaced the current row's value: put it back.
+      a.value = valueA;
+      b.value = valueB;
     }
     return count;
   }

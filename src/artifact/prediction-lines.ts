@@ -286,7 +286,7 @@ export class PredictionLines {
    * string path, which refuses a larger number). The value is what `Number()` gives for the same
    * text: decimal.ts, or `Number()` itself.
    */
-  private number(from: number): number {
+  number(from: number): number {
     const buf = this.buf;
     const end = this.end;
     let p = from;

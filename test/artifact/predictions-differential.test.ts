@@ -324,6 +324,7 @@ describe('byte-level predictions reader = string reader', () => {
         'long-both',
         'value-cand',
         'back-cand',
+        'apart-both',
       ),
     });
     await fc.assert(
@@ -334,13 +335,16 @@ describe('byte-level predictions reader = string reader', () => {
         fc.constantFrom('stream', 'checked', 'chunks'),
         fc.array(fc.integer({ min: 1, max: 9000 }), { minLength: 1, maxLength: 4 }),
         fc.option(fc.integer({ min: 1, max: 5000 })),
-        async (n, edits, kind, how, sizes, window) => {
+        fc.boolean(),
+        async (n, edits, kind, how, sizes, window, pad) => {
           const value = (i: number, salt: number): string =>
             kind === 'proportion'
               ? String((i * 2654435761 + salt) % 7 < 3 ? 0 : 1)
               : String(((i * 2654435761 + salt) % 1000) / 997);
-          const base = Array.from({ length: n }, (_, i) => `r-${i},${value(i, 1)}\n`);
-          const cand = Array.from({ length: n }, (_, i) => `r-${i},${value(i, 5)}\n`);
+          // Padded ids increase by bytes too (r-000010 after r-000009).
+          const id = (i: number): string => `r-${pad ? String(i).padStart(6, '0') : i}`;
+          const base = Array.from({ length: n }, (_, i) => `${id(i)},${value(i, 1)}\n`);
+          const cand = Array.from({ length: n }, (_, i) => `${id(i)},${value(i, 5)}\n`);
           for (const { at, what } of edits) {
             const i = at % n;
             if (what === 'drop-base') base[i] = '';
@@ -354,16 +358,21 @@ describe('byte-level predictions reader = string reader', () => {
               base[i] = `${base[i] ?? ''}${base[i] ?? ''}`;
               cand[i] = `${cand[i] ?? ''}${cand[i] ?? ''}`;
             } else if (what === 'long-both') {
-              base[i] = `r-${i}${'z'.repeat(70)},${value(i, 1)}\n`;
-              cand[i] = `r-${i}${'z'.repeat(70)},${value(i, 5)}\n`;
-            } else if (what === 'back-cand' && n > 10 && String(n - 1)[0] !== '9') {
+              base[i] = `${id(i)}${'z'.repeat(70)},${value(i, 1)}\n`;
+              cand[i] = `${id(i)}${'z'.repeat(70)},${value(i, 5)}\n`;
+            } else if (what === 'apart-both') {
+              // One row each that the other file lacks, then in step again (the rows in between
+              // wait in the id table, and the losses' pairs keep their order through the ring).
+              base[i] = `${base[i] ?? ''}${id(i)}a,${value(i, 2)}\n`;
+              cand[i] = `${cand[i] ?? ''}${id(i)}b,${value(i, 3)}\n`;
+            } else if (what === 'back-cand' && !pad && n > 10 && String(n - 1)[0] !== '9') {
               // The candidate ends with an id from further back again (r-5 after r-17): it follows
               // the last one by bytes, not by length then bytes; but the ids stopped increasing
               // by bytes at r-9 → r-10, so it is a repeat to find (only the order checks can).
               const m = Number(String(n - 1)[0]) + 1;
               cand[n - 1] = `${cand[n - 1] ?? ''}r-${m},${value(m, 5)}\n`;
             } else if (what === 'value-cand')
-              cand[i] = `r-${i},${kind === 'proportion' ? 2 : 'x'}\n`;
+              cand[i] = `${id(i)},${kind === 'proportion' ? 2 : 'x'}\n`;
           }
           const header = kind === 'proportion' ? 'id,correct\n' : 'id,loss\n';
           const baseBytes = utf8(header + base.join(''));

@@ -371,55 +371,69 @@ describe('PredictionLines reads', () => {
 });
 
 describe('Pairing lockstep loop', () => {
-  it("leaves each file's id, previous id, line and value as reading row by row would", async () => {
-    // Reference: the file's own rows (row k is r-k with value k mod 2 or (k + 1) mod 2). The
-    // candidate has a blank line after its header, so its rows sit at other offsets in its buffer.
-    const rows = 5000;
-    const body = (salt: number): string =>
-      Array.from({ length: rows }, (_, i) => `r-${i},${(i + salt) % 2}\n`).join('');
-    const reader = (text: string): PredictionLines => {
-      const data = Buffer.from(text);
-      let at = 0;
-      return new PredictionLines(
-        {
-          async read(into, offset, length) {
-            const n = Math.min(length, data.length - at, 3000);
-            into.set(data.subarray(at, at + n), offset);
-            at += n;
-            return n;
+  for (const kind of ['proportion', 'continuous'] as const) {
+    it(`leaves each file's id, previous id, line and value as reading row by row would (${kind})`, async () => {
+      // Reference: the file's own rows (row k is r-k with a value from k). The candidate has a
+      // blank line after its header, so its rows sit at other offsets in its buffer; reads of
+      // 3000 bytes cut rows at many places.
+      const rows = 5000;
+      const value = (k: number, salt: number): number =>
+        kind === 'proportion' ? (k + salt) % 2 : ((k * 37 + salt) % 101) / 8;
+      const body = (salt: number): string =>
+        Array.from({ length: rows }, (_, i) => `r-${i},${value(i, salt)}\n`).join('');
+      const reader = (text: string): PredictionLines => {
+        const data = Buffer.from(text);
+        let at = 0;
+        return new PredictionLines(
+          {
+            async read(into, offset, length) {
+              const n = Math.min(length, data.length - at, 3000);
+              into.set(data.subarray(at, at + n), offset);
+              at += n;
+              return n;
+            },
+            async close() {},
           },
-          async close() {},
-        },
-        'f.csv',
-        'proportion',
-      );
-    };
-    const a = reader(`id,correct\n${body(0)}`);
-    const b = reader(`id,correct\n\n${body(1)}`);
-    const pairing = new Pairing(a, b, new IdTable(false), 'proportion', TUNING);
-    const prevId = (l: PredictionLines): string =>
-      l.prevKey.toString('utf8', l.prevStart, l.prevStart + l.prevLen);
-    let checks = 0;
-    for (let r = pairing.run(); r !== DONE; r = pairing.run()) {
-      for (const [l, salt, blank] of [
-        [a, 0, 0],
-        [b, 1, 1],
-      ] as const) {
-        if (l.rows >= 2) {
-          expect(l.id()).toBe(`r-${l.rows - 1}`);
-          expect(prevId(l)).toBe(`r-${l.rows - 2}`);
-          expect(l.value).toBe((l.rows - 1 + salt) % 2);
-          expect(l.line).toBe(l.rows + 1 + blank);
-          checks++;
+          'f.csv',
+          kind,
+        );
+      };
+      const header = kind === 'proportion' ? 'id,correct' : 'id,loss';
+      const a = reader(`${header}\n${body(0)}`);
+      const b = reader(`${header}\n\n${body(1)}`);
+      const pairing = new Pairing(a, b, new IdTable(kind === 'continuous'), kind, TUNING);
+      const prevId = (l: PredictionLines): string =>
+        l.prevKey.toString('utf8', l.prevStart, l.prevStart + l.prevLen);
+      let checks = 0;
+      for (let r = pairing.run(); r !== DONE; r = pairing.run()) {
+        for (const [l, salt] of [
+          [a, 0],
+          [b, 1],
+        ] as const) {
+          if (l.rows >= 2) {
+            expect(l.id()).toBe(`r-${l.rows - 1}`);
+            expect(prevId(l)).toBe(`r-${l.rows - 2}`);
+            expect(l.value).toBe(value(l.rows - 1, salt));
+            expect(l.line).toBe(l.rows + 1 + salt);
+            checks++;
+          }
         }
+        if (r === NEED_A) await a.fill();
+        else await b.fill();
       }
-      if (r === NEED_A) await a.fill();
-      else await b.fill();
-    }
-    expect(checks).toBeGreaterThan(10);
-    expect(pairing.rows).toBe(rows);
-    // Pairs where the baseline is right (1) and the candidate wrong (0): the odd rows.
-    expect(pairing.baselineOnly).toBe(rows / 2);
-    expect(pairing.candidateOnly).toBe(rows / 2);
-  });
+      expect(checks).toBeGreaterThan(10);
+      pairing.flush();
+      expect(pairing.rows).toBe(rows);
+      if (kind === 'proportion') {
+        // The baseline is right (1) and the candidate wrong (0) on odd rows, the reverse on even.
+        expect(pairing.baselineOnly).toBe(rows / 2);
+        expect(pairing.candidateOnly).toBe(rows / 2);
+      } else {
+        // Source: the mean of the differences, summed directly (common practice).
+        let sum = 0;
+        for (let k = 0; k < rows; k++) sum += value(k, 1) - value(k, 0);
+        expect(Math.abs(pairing.diffs.mean - sum / rows)).toBeLessThan(1e-12);
+      }
+    });
+  }
 });
