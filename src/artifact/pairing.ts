@@ -8,6 +8,7 @@ import { IdBatch, MEET_BASE, MEET_CAND } from './id-batch.js';
 import type { IdTable } from './id-tables.js';
 import { IdOrder, idSteps, sameIds } from './id-compare.js';
 import { BASE, CAND, INLINE_ID_BYTES } from './id-tables.js';
+import { lockstepRows } from './lockstep.js';
 import { NEED, ROW, type PredictionLines } from './prediction-lines.js';
 
 /** `run()` results. */
@@ -18,8 +19,6 @@ export const NEED_B = 2;
 const ADVANCE_A = 0;
 const ADVANCE_B = 1;
 const PAIR = 2;
-/** Steps of one call of the lockstep loop (see `lockstepRows`). */
-const BLOCK = 2048;
 /** Loss differences are handed to RunningStats in batches (a double argument is an allocation). */
 const BATCH = 4096;
 /**
@@ -84,27 +83,31 @@ export class Pairing {
   /** Files (BASE | CAND) whose ids stopped increasing. */
   unordered = 0;
   batch: IdBatch;
-  private hasA = true;
-  private hasB = true;
+  /** Whether each file has a current row (false once it ended). */
+  hasA = true;
+  hasB = true;
   private phase = ADVANCE_A;
-  private step = 0;
-  private windowStart = 0;
+  /** Steps taken (a row of each file per step); the step the current window started at. */
+  step = 0;
+  windowStart = 0;
   /** Losses: pairs of the window by (step − windowStart) · 3 + k; NaN for none. */
-  private ring: Float64Array;
-  private window: number;
-  private ringUsed = false;
-  private strict = false;
+  ring: Float64Array;
+  window: number;
+  /** Losses: pairs go through `ring` (some rows were out of step), else straight to `pending`. */
+  ringUsed = false;
+  strict = false;
   private settles = 0;
   /** The last step's rows had the same id (then each file's previous id is the same too). */
-  private lockstep = false;
-  private readonly orderA = new IdOrder();
-  private readonly orderB = new IdOrder();
-  private readonly pending = new Float64Array(BATCH);
-  private pendingCount = 0;
+  lockstep = false;
+  readonly orderA = new IdOrder();
+  readonly orderB = new IdOrder();
+  /** Loss differences not yet handed to `diffs`. */
+  readonly pending = new Float64Array(BATCH);
+  pendingCount = 0;
   /** Differences that fill a batch: WARM_BATCH for the first WARM_FLUSHES batches, then BATCH. */
-  private batchOf = WARM_BATCH;
+  batchOf = WARM_BATCH;
   private flushes = 0;
-  private readonly proportion: boolean;
+  readonly proportion: boolean;
 
   constructor(
     readonly a: PredictionLines,
@@ -125,7 +128,7 @@ export class Pairing {
     for (;;) {
       if (this.phase === ADVANCE_A) {
         if (this.lockstep && this.unordered === 0 && !this.strict) {
-          this.lockstepRows();
+          lockstepRows(this);
           batch = this.batch;
         }
         if (this.hasA) {
@@ -229,170 +232,6 @@ export class Pairing {
       }
       this.phase = ADVANCE_A;
     }
-  }
-
-  /**
-   * The common case of `run()` in one tight loop: both files in step (the last rows had the same
-   * id) and ids increasing. Each row pair is read from the two buffers by the byte path's rules,
-   * and taken only when the rows are `ID,V\n` lines wholly in their buffers (V: 0 or 1, or a loss
-   * the byte path reads) with the same id, following the last one in order; the pair then counts
-   * exactly as one step of `run()` counts it (the same Welford updates, counts, differences and
-   * order checks; the window settles and the batch of differences flushes at the same steps).
-   * Anything else stops the loop before that row, and `run()` reads it. Why: one loop without a
-   * call (0/1 values) or a field write per row is about 1.6 times as fast as the general step,
-   * and V8 compiles it sooner (issue 14). The loop itself is in `lockstepBlock`, which stops at
-   * the end of a window or batch, so that V8 compiles it without the settling code (a compile of
-   * the two together took 36 ms).
-   */
-  private lockstepRows(): void {
-    const { a, b } = this;
-    if (a.pending !== null || b.pending !== null || !this.hasA || !this.hasB) return;
-    for (;;) {
-      const room = this.window - (this.step - this.windowStart);
-      if (room < 1) return; // not expected: run() settles after a full window
-      // Blocks of at most BLOCK steps: once V8 has compiled the loop, the next block runs the
-      // compiled code, without waiting for a replacement of the running one (on-stack replacement).
-      // Losses: a block also ends where the batch of differences is full, flushed here.
-      const free = this.proportion || this.ringUsed ? BLOCK : this.batchOf - this.pendingCount;
-      if (free < 1) return; // not expected: run() flushes a full batch at once
-      const block = Math.min(room, BLOCK, free);
-      const taken = this.lockstepBlock(block);
-      if (!this.proportion && this.pendingCount === this.batchOf) this.flush();
-      if (taken < block) return;
-      if (taken === room) this.settle();
-    }
-  }
-
-  /** Up to `room` steps of `lockstepRows`; how many were taken. */
-  private lockstepBlock(room: number): number {
-    const { a, b } = this;
-    const ba = a.buf;
-    const bb = b.buf;
-    const va = a.view;
-    const vb = b.view;
-    const ea = a.end;
-    const eb = b.end;
-    const s = this.sides;
-    const orderA = this.orderA;
-    const orderB = this.orderB;
-    let pa = a.pos;
-    let pb = b.pos;
-    // The previous row (of both files: the same id).
-    let prevView = a.keyView;
-    let prevStart = a.keyStart;
-    let prevLen = a.keyLen;
-    // The last rows taken (their ids have the same length in both files) and the ones before.
-    let lastA = 0;
-    let lastB = 0;
-    let lastLen = 0;
-    let beforeA = 0;
-    let beforeB = 0;
-    let beforeLen = 0;
-    let x = 0;
-    let y = 0;
-    let count = 0;
-    let baselineOnly = 0;
-    let candidateOnly = 0;
-    const valueA = a.value;
-    const valueB = b.value;
-    const proportion = this.proportion;
-    const ringUsed = this.ringUsed;
-    const ring = this.ring;
-    const pending = this.pending;
-    let pendingCount = this.pendingCount;
-    let step = this.step;
-    const windowStart = this.windowStart;
-    while (count < room) {
-      // Row of the baseline: ID up to the comma, then 0 or 1, then a newline, all in the buffer.
-      let p = pa;
-      let c = p < ea ? (ba[p] as number) : 0;
-      while (c > 32 && c < 127 && c !== 44) c = ++p < ea ? (ba[p] as number) : 0;
-      const len = p - pa;
-      if (c !== 44 || len === 0) break;
-      let nextA: number;
-      let xv: number;
-      if (proportion) {
-        if (p + 2 >= ea) break;
-        const xa = ba[p + 1] as number;
-        if ((xa !== 48 && xa !== 49) || ba[p + 2] !== 10) break;
-        xv = xa - 48;
-        nextA = p + 3;
-      } else {
-        // A plain decimal within ±1e15 and a newline (prediction-lines.ts `number`), else -1.
-        nextA = a.number(p + 1);
-        if (nextA < 0) break;
-        xv = a.value;
-      }
-      // Row of the candidate, the same way.
-      let q = pb;
-      c = q < eb ? (bb[q] as number) : 0;
-      while (c > 32 && c < 127 && c !== 44) c = ++q < eb ? (bb[q] as number) : 0;
-      if (c !== 44) break;
-      let nextB: number;
-      let yv: number;
-      if (proportion) {
-        if (q + 2 >= eb) break;
-        const yb = bb[q + 1] as number;
-        if ((yb !== 48 && yb !== 49) || bb[q + 2] !== 10) break;
-        yv = yb - 48;
-        nextB = q + 3;
-      } else {
-        nextB = b.number(q + 1);
-        if (nextB < 0) break;
-        yv = b.value;
-      }
-      if (!sameIds(va, pa, len, vb, pb, q - pb)) break;
-      const code = idSteps(va, pa, len, prevView, prevStart, prevLen);
-      if (!orderA.take(code) || !orderB.take(code)) break;
-      // Taken: the same arithmetic, in the same order, as run().
-      x = xv;
-      y = yv;
-      let n = (s[0] as number) + 1;
-      s[0] = n;
-      let delta = x - (s[1] as number);
-      s[1] = (s[1] as number) + delta / n;
-      s[2] = (s[2] as number) + delta * (x - (s[1] as number));
-      n = (s[3] as number) + 1;
-      s[3] = n;
-      delta = y - (s[4] as number);
-      s[4] = (s[4] as number) + delta / n;
-      s[5] = (s[5] as number) + delta * (y - (s[4] as number));
-      if (proportion) {
-        if (x === 1 && y === 0) baselineOnly++;
-        else if (x === 0 && y === 1) candidateOnly++;
-      } else if (ringUsed) ring[(step - windowStart) * 3] = y - x;
-      else {
-        // Within ±1e15 on the byte path: never HUGE (run()'s strict mode) and always finite.
-        pending[pendingCount++] = y - x;
-      }
-      step++;
-      beforeA = lastA;
-      beforeB = lastB;
-      beforeLen = lastLen;
-      lastA = pa;
-      lastB = pb;
-      lastLen = len;
-      prevView = va;
-      prevStart = pa;
-      prevLen = len;
-      pa = nextA;
-      pb = nextB;
-      count++;
-    }
-    if (count > 0) {
-      this.rows += count;
-      this.step = step;
-      this.pendingCount = pendingCount;
-      this.baselineOnly += baselineOnly;
-      this.candidateOnly += candidateOnly;
-      a.took(count, lastA, lastLen, x, beforeA, beforeLen, pa);
-      b.took(count, lastB, lastLen, y, beforeB, beforeLen, pb);
-    } else {
-      // A loss read for a row not taken replaced the current row's value: put it back.
-      a.value = valueA;
-      b.value = valueB;
-    }
-    return count;
   }
 
   /**
