@@ -13,6 +13,8 @@
  *   point (a near-tie) is left to `Number()`.
  */
 
+import { MAX_MAGNITUDE } from '../model/limits.js';
+
 /** 10^0 … 10^22, each exact in a double. */
 export const POW10: readonly number[] = Array.from({ length: 23 }, (_, i) => Number(`1e${i}`));
 const TWO53 = 2 ** 53;
@@ -125,4 +127,102 @@ export function decodeDecimal(loDigits: number, scale: number): boolean {
   else if (a > half + margin && a < 2 * half * 1.2) io[2] = c;
   else return false;
   return true;
+}
+
+/** Whether the four bytes of w (little-endian) are all ASCII digits (common practice, "SWAR"). */
+function allDigits(w: number): boolean {
+  return (w & 0xf0f0f0f0) === 0x30303030 && ((w + 0x06060606) & 0xf0f0f0f0) === 0x30303030;
+}
+
+/** The number the four ASCII digits of w spell, the lowest byte being the first digit. */
+function fourDigits(w: number): number {
+  const d = w - 0x30303030;
+  const pairs = (Math.imul(d, 10) + (d >>> 8)) & 0x00ff00ff; // d0·10 + d1, d2·10 + d3
+  return (pairs & 0xff) * 100 + (pairs >>> 16);
+}
+
+/**
+ * Reads a plain decimal (`-?D+(.D+)?([eE][+-]?D+)?`) within ±1e15 followed by `\n` from `buf[from]`
+ * (before `end`; `view` reads the same bytes): sets io[2] to its value and returns the index after
+ * the newline, or −1 for anything else (then the value is not set). The value is what `Number()`
+ * gives for the same text: `decodeDecimal`, or `Number()` itself. Used by the predictions
+ * reader's byte path (prediction-lines.ts) and the lockstep loop (lockstep.ts).
+ */
+export function readDecimal(buf: Buffer, view: DataView, from: number, end: number): number {
+  let p = from;
+  let c = p < end ? (buf[p] as number) : -1;
+  const negative = c === 45;
+  if (negative) c = ++p < end ? (buf[p] as number) : -1;
+  // The leading significant digits in hi while it stays below 9·10^15 (an exact integer under
+  // 2^53: 16 digits unless they start with 9), the next ones (up to 4 are used) in lo.
+  let hi = 0;
+  let lo = 0;
+  let loDigits = 0;
+  const intStart = p;
+  while (p < end && (c = buf[p] as number) >= 48 && c <= 57) {
+    if (hi < 9e14) hi = hi * 10 + (c - 48);
+    else {
+      lo = lo * 10 + (c - 48);
+      loDigits++;
+    }
+    p++;
+  }
+  if (p === intStart) return -1;
+  let scale = 0;
+  if (p < end && c === 46) {
+    const fracStart = ++p;
+    // Eight digits at a time while they fit in hi (a fraction is most of a loss's digits):
+    // hi < 9·10^7 before a block keeps it below 9·10^15, as the digit loop would.
+    while (hi < 9e7 && p + 8 <= end) {
+      const w0 = view.getUint32(p, true);
+      const w1 = view.getUint32(p + 4, true);
+      if (!allDigits(w0) || !allDigits(w1)) break;
+      hi = hi * 1e8 + fourDigits(w0) * 10000 + fourDigits(w1);
+      p += 8;
+    }
+    while (p < end && (c = buf[p] as number) >= 48 && c <= 57) {
+      if (hi < 9e14) hi = hi * 10 + (c - 48);
+      else {
+        lo = lo * 10 + (c - 48);
+        loDigits++;
+      }
+      p++;
+    }
+    if (p === fracStart) return -1;
+    scale = fracStart - p;
+  }
+  if (p >= end) return -1;
+  if (c === 101 || c === 69) {
+    c = ++p < end ? (buf[p] as number) : -1;
+    let sign = 1;
+    if (c === 43 || c === 45) {
+      if (c === 45) sign = -1;
+      c = ++p < end ? (buf[p] as number) : -1;
+    }
+    let e = 0;
+    const expStart = p;
+    while (p < end && (c = buf[p] as number) >= 48 && c <= 57) {
+      if (e < 100000) e = e * 10 + (c - 48);
+      p++;
+    }
+    if (p === expStart || p >= end) return -1;
+    scale += sign * e;
+  }
+  if (c !== 10) return -1;
+  let value: number;
+  if (loDigits === 0 && scale >= -22 && scale <= 22) {
+    // Clinger's fast path (decimal.ts) inline: most losses have at most 16 digits.
+    value = scale < 0 ? hi / (POW10[-scale] as number) : hi * (POW10[scale] as number);
+    if (negative) value = -value;
+  } else {
+    io[0] = hi;
+    io[1] = lo;
+    if (decodeDecimal(loDigits, scale)) {
+      value = io[2] as number;
+      if (negative) value = -value;
+    } else value = Number(buf.toString('latin1', from, p));
+  }
+  if (!(Math.abs(value) <= MAX_MAGNITUDE)) return -1;
+  io[2] = value;
+  return p + 1;
 }

@@ -3,6 +3,7 @@
  * loop over the two files' buffers. It reads and writes the pairing's state through
  * `LockstepState` (the `Pairing` itself) and the readers' rows through `PredictionLines.took`.
  */
+import { io, readDecimal } from './decimal.js';
 import { idSteps, sameIds, type IdOrder } from './id-compare.js';
 import type { PredictionLines } from './prediction-lines.js';
 
@@ -96,8 +97,6 @@ function lockstepBlock(st: LockstepState, room: number): number {
   let count = 0;
   let baselineOnly = 0;
   let candidateOnly = 0;
-  const valueA = a.value;
-  const valueB = b.value;
   const proportion = st.proportion;
   const ringUsed = st.ringUsed;
   const ring = st.ring;
@@ -121,10 +120,10 @@ function lockstepBlock(st: LockstepState, room: number): number {
       xv = xa - 48;
       nextA = p + 3;
     } else {
-      // A plain decimal within ±1e15 and a newline (prediction-lines.ts `number`), else -1.
-      nextA = a.number(p + 1);
+      // A plain decimal within ±1e15 and a newline (decimal.ts `readDecimal`), else -1.
+      nextA = readDecimal(ba, va, p + 1, ea);
       if (nextA < 0) break;
-      xv = a.value;
+      xv = io[2] as number;
     }
     // Row of the candidate, the same way.
     let q = pb;
@@ -140,9 +139,9 @@ function lockstepBlock(st: LockstepState, room: number): number {
       yv = yb - 48;
       nextB = q + 3;
     } else {
-      nextB = b.number(q + 1);
+      nextB = readDecimal(bb, vb, q + 1, eb);
       if (nextB < 0) break;
-      yv = b.value;
+      yv = io[2] as number;
     }
     if (!sameIds(va, pa, len, vb, pb, q - pb)) break;
     const code = idSteps(va, pa, len, prevView, prevStart, prevLen);
@@ -190,10 +189,6 @@ function lockstepBlock(st: LockstepState, room: number): number {
     st.candidateOnly += candidateOnly;
     a.took(count, lastA, lastLen, x, beforeA, beforeLen, pa);
     b.took(count, lastB, lastLen, y, beforeB, beforeLen, pb);
-  } else {
-    // A loss read for a row not taken replaced the current row's value: put it back.
-    a.value = valueA;
-    b.value = valueB;
   }
   return count;
 }

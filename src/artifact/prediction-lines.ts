@@ -20,7 +20,7 @@ import type { MetricKind } from '../model/run.js';
 import { InputError, quote } from '../model/errors.js';
 import { MAX_MAGNITUDE } from '../model/limits.js';
 import { parseDecimal } from '../model/settings.js';
-import { POW10, decodeDecimal, io } from './decimal.js';
+import { io, readDecimal } from './decimal.js';
 import type { ByteReader } from './byte-readers.js';
 
 export { lazyReader, streamReader, type ByteReader } from './byte-readers.js';
@@ -72,18 +72,6 @@ function parseValue(raw: string, kind: MetricKind, file: string, line: number): 
     ]);
   }
   return value;
-}
-
-/** Whether the four bytes of w (little-endian) are all ASCII digits (common practice, "SWAR"). */
-function allDigits(w: number): boolean {
-  return (w & 0xf0f0f0f0) === 0x30303030 && ((w + 0x06060606) & 0xf0f0f0f0) === 0x30303030;
-}
-
-/** The number the four ASCII digits of w spell, the lowest byte being the first digit. */
-function fourDigits(w: number): number {
-  const d = w - 0x30303030;
-  const pairs = (Math.imul(d, 10) + (d >>> 8)) & 0x00ff00ff; // d0·10 + d1, d2·10 + d3
-  return (pairs & 0xff) * 100 + (pairs >>> 16);
 }
 
 /** A DataView of exactly the bytes of `buf`. */
@@ -281,91 +269,14 @@ export class PredictionLines {
   }
 
   /**
-   * Reads a plain decimal (`-?D+(.D+)?([eE][+-]?D+)?`) within ±1e15 followed by `\n` from `p`; sets
-   * `value` and returns the index after the newline, or −1 for anything else (the line takes the
-   * string path, which refuses a larger number). The value is what `Number()` gives for the same
-   * text: decimal.ts, or `Number()` itself.
+   * Reads a plain decimal within ±1e15 followed by `\n` from `from` (decimal.ts `readDecimal`):
+   * sets `value` and returns the index after the newline, or −1 for anything else (the line takes
+   * the string path, which refuses a larger number).
    */
-  number(from: number): number {
-    const buf = this.buf;
-    const end = this.end;
-    let p = from;
-    let c = p < end ? (buf[p] as number) : -1;
-    const negative = c === 45;
-    if (negative) c = ++p < end ? (buf[p] as number) : -1;
-    // The leading significant digits in hi while it stays below 9·10^15 (an exact integer under
-    // 2^53: 16 digits unless they start with 9), the next ones (up to 4 are used) in lo.
-    let hi = 0;
-    let lo = 0;
-    let loDigits = 0;
-    const intStart = p;
-    while (p < end && (c = buf[p] as number) >= 48 && c <= 57) {
-      if (hi < 9e14) hi = hi * 10 + (c - 48);
-      else {
-        lo = lo * 10 + (c - 48);
-        loDigits++;
-      }
-      p++;
-    }
-    if (p === intStart) return -1;
-    let scale = 0;
-    if (p < end && c === 46) {
-      const fracStart = ++p;
-      // Eight digits at a time while they fit in hi (a fraction is most of a loss's digits):
-      // hi < 9·10^7 before a block keeps it below 9·10^15, as the digit loop would.
-      const view = this.view;
-      while (hi < 9e7 && p + 8 <= end) {
-        const w0 = view.getUint32(p, true);
-        const w1 = view.getUint32(p + 4, true);
-        if (!allDigits(w0) || !allDigits(w1)) break;
-        hi = hi * 1e8 + fourDigits(w0) * 10000 + fourDigits(w1);
-        p += 8;
-      }
-      while (p < end && (c = buf[p] as number) >= 48 && c <= 57) {
-        if (hi < 9e14) hi = hi * 10 + (c - 48);
-        else {
-          lo = lo * 10 + (c - 48);
-          loDigits++;
-        }
-        p++;
-      }
-      if (p === fracStart) return -1;
-      scale = fracStart - p;
-    }
-    if (p >= end) return -1;
-    if (c === 101 || c === 69) {
-      c = ++p < end ? (buf[p] as number) : -1;
-      let sign = 1;
-      if (c === 43 || c === 45) {
-        if (c === 45) sign = -1;
-        c = ++p < end ? (buf[p] as number) : -1;
-      }
-      let e = 0;
-      const expStart = p;
-      while (p < end && (c = buf[p] as number) >= 48 && c <= 57) {
-        if (e < 100000) e = e * 10 + (c - 48);
-        p++;
-      }
-      if (p === expStart || p >= end) return -1;
-      scale += sign * e;
-    }
-    if (c !== 10) return -1;
-    let value: number;
-    if (loDigits === 0 && scale >= -22 && scale <= 22) {
-      // Clinger's fast path (decimal.ts) inline: most losses have at most 16 digits.
-      value = scale < 0 ? hi / (POW10[-scale] as number) : hi * (POW10[scale] as number);
-      if (negative) value = -value;
-    } else {
-      io[0] = hi;
-      io[1] = lo;
-      if (decodeDecimal(loDigits, scale)) {
-        value = io[2] as number;
-        if (negative) value = -value;
-      } else value = Number(buf.toString('latin1', from, p));
-    }
-    if (!(Math.abs(value) <= MAX_MAGNITUDE)) return -1;
-    this.value = value;
-    return p + 1;
+  private number(from: number): number {
+    const next = readDecimal(this.buf, this.view, from, this.end);
+    if (next >= 0) this.value = io[2] as number;
+    return next;
   }
 
   /** The string path for the line(s) of the segment from `start` to the next `\n`. */
