@@ -32,7 +32,8 @@ export const CHUNK = 1 << 20;
  * with what it has seen so far, so when those paths had never run, the first 1 MiB boundary threw
  * the compiled loop away (a deoptimization), and the loop ran slow again until it was recompiled
  * (issue 14: 7–20 ms of compiler time each on a busy 2-core machine). Small first reads run those
- * paths a few dozen times while the loop is still interpreted; the rows and their order do not change.
+ * paths a few dozen times while the loop is still interpreted; the rows and their order do not
+ * change. (The lockstep loop, lockstep.ts, stops at a cut row and leaves it to these paths too.)
  */
 const WARM_READS = 48;
 const WARM_BYTES = 1024;
