@@ -125,11 +125,10 @@ function lockstepBlock(st: LockstepState, room: number): number {
       if (nextA < 0) break;
       xv = io[2] as number;
     }
-    // Row of the candidate, the same way.
-    let q = pb;
-    c = q < eb ? (bb[q] as number) : 0;
-    while (c > 32 && c < 127 && c !== 44) c = ++q < eb ? (bb[q] as number) : 0;
-    if (c !== 44) break;
+    // Row of the candidate: the same id bytes (compared a word at a time, so they are as valid as
+    // the baseline's), then a comma, then its value the same way.
+    const q = pb + len;
+    if (q >= eb || bb[q] !== 44 || !sameIds(va, pa, len, vb, pb, len)) break;
     let nextB: number;
     let yv: number;
     if (proportion) {
@@ -143,7 +142,6 @@ function lockstepBlock(st: LockstepState, room: number): number {
       if (nextB < 0) break;
       yv = io[2] as number;
     }
-    if (!sameIds(va, pa, len, vb, pb, q - pb)) break;
     const code = idSteps(va, pa, len, prevView, prevStart, prevLen);
     if (!orderA.take(code) || !orderB.take(code)) break;
     // Taken: the same arithmetic, in the same order, as run().

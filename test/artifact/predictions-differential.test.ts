@@ -325,6 +325,8 @@ describe('byte-level predictions reader = string reader', () => {
         'value-cand',
         'back-cand',
         'apart-both',
+        'prefix-cand',
+        'semicolon-cand',
       ),
     });
     await fc.assert(
@@ -365,6 +367,12 @@ describe('byte-level predictions reader = string reader', () => {
               // wait in the id table, and the losses' pairs keep their order through the ring).
               base[i] = `${base[i] ?? ''}${id(i)}a,${value(i, 2)}\n`;
               cand[i] = `${cand[i] ?? ''}${id(i)}b,${value(i, 3)}\n`;
+            } else if (what === 'prefix-cand') {
+              // The candidate's id is the baseline's and one more byte (r-5 beside r-50).
+              cand[i] = `${id(i)}0,${value(i, 5)}\n`;
+            } else if (what === 'semicolon-cand') {
+              // One field, not two: `r-5;1` must be refused, not read as the id r-5.
+              cand[i] = `${id(i)};${value(i, 5)}\n`;
             } else if (what === 'back-cand' && !pad && n > 10 && String(n - 1)[0] !== '9') {
               // The candidate ends with an id from further back again (r-5 after r-17): it follows
               // the last one by bytes, not by length then bytes; but the ids stopped increasing
