@@ -52,6 +52,24 @@ export function perRepeat(run: RunArtifact, measure: Measure): number[] | null {
   return out;
 }
 
+/**
+ * The largest |term| over the repeats (|constant| + Σ |weight · value|): the size of the numbers a
+ * per-repeat value is computed from, which sets its floating-point round-off (an error component
+ * such as validation − train can be far smaller than its operands).
+ */
+export function perRepeatMagnitude(run: RunArtifact, measure: Measure): number {
+  let largest = 0;
+  const repeats = run.splits.train.values.length;
+  for (let i = 0; i < repeats; i++) {
+    let total = Math.abs(measure.constant);
+    for (const term of measure.terms) {
+      total += Math.abs(term.weight * (run.splits[term.split]?.values[i] ?? 0));
+    }
+    if (total > largest) largest = total;
+  }
+  return largest;
+}
+
 /** σ² of one repeat's value of a split from its per-example values (predictions), by split. */
 export type ExampleNoise = Partial<Record<SplitName, SamplingVariance>>;
 

@@ -15,6 +15,7 @@ import type { Interval, TestResult } from '../stats/types.js';
 import {
   measureSampling,
   perRepeat,
+  perRepeatMagnitude,
   shortfallSign,
   type ExampleNoise,
   type Measure,
@@ -67,7 +68,8 @@ export function measureNoise(
   const values = perRepeat(run, measure);
   if (values === null) return null;
   const { sampling, rows } = measureSampling(run, measure, examples);
-  return splitNoise({ values, sampling, evaluationRows: rows });
+  const magnitude = perRepeatMagnitude(run, measure);
+  return splitNoise({ values, sampling, evaluationRows: rows, magnitude });
 }
 
 /** Per-run σ² from per-example values, by split. */

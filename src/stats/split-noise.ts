@@ -51,7 +51,10 @@ export interface SamplingVariance {
   source: 'binomial' | 'per-example';
 }
 
-/** A spread at or below this fraction of the largest |value| is floating-point round-off. */
+/**
+ * A spread at or below this fraction of the largest |value| (or of the operands the values were
+ * computed from, `SplitNoiseInput.magnitude`) is floating-point round-off.
+ */
 export const ROUNDOFF_RELATIVE = 1e-12;
 
 /**
@@ -112,6 +115,12 @@ export interface SplitNoiseInput {
   sampling?: SamplingVariance | null;
   /** @default 'fixed' */
   evaluationRows?: EvaluationRows;
+  /**
+   * The largest |operand| the values were computed from, when they are sums or differences of
+   * larger numbers (validation − train): their round-off is relative to that, not to the values.
+   * @default the largest |value|
+   */
+  magnitude?: number;
 }
 
 /** How `splitNoise` formed the variance (codes, for the review model). */
@@ -159,7 +168,7 @@ export function splitNoise(input: SplitNoiseInput): SplitNoise {
   const m = mean(values);
   const sampling = usable(input.sampling);
   const samplingCode = sampling ? sampling.source : 'unknown';
-  const spread = k >= 2 ? spreadVariance(values) : NaN;
+  const spread = k >= 2 ? spreadVariance(values, input.magnitude ?? 0) : NaN;
   const seed: NoiseBasis['seed'] = k < 2 ? 'one-repeat' : spread === 0 ? 'zero-spread' : 'spread';
 
   let perRepeat = { variance: 0, df: Infinity };
@@ -204,9 +213,9 @@ function usable(s: SamplingVariance | null | undefined): SamplingVariance | null
 }
 
 /** Sample variance, or 0 when the spread is floating-point round-off (see ROUNDOFF_RELATIVE). */
-function spreadVariance(values: readonly number[]): number {
+function spreadVariance(values: readonly number[], magnitude: number): number {
   const s2 = sampleVariance(values);
-  const scale = Math.max(...values.map(Math.abs));
+  const scale = Math.max(magnitude, ...values.map(Math.abs));
   return Math.sqrt(s2) <= ROUNDOFF_RELATIVE * scale ? 0 : s2;
 }
 

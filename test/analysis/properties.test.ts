@@ -93,6 +93,21 @@ describe('review properties', () => {
     );
   });
 
+  it('a spread of round-off in validation − train is no noise at any scale (found by fast-check)', () => {
+    // Gaps of 1e-9 and 0 on values near 1: validation − train differs between repeats only by
+    // round-off of the operands (about 1e-16), which a scale of 0.027 turned into exactly 0 while
+    // unscaled it stayed 1e-17 ("undetermined" vs "flat"). Round-off is judged relative to the
+    // operands (split-noise.ts ROUNDOFF_RELATIVE), so both are no spread. Common practice.
+    const a = { train: [0.9999999996227569, 0.5], gap: [1e-9, 1e-9] };
+    const b = { train: [0.5, 0.5], gap: [1e-9, 0] };
+    for (const c of [0.026962001970590416, 0.010000000000000012, 3]) {
+      const plain = buildReview({ baseline: run(a), candidate: run(b), settings: SETTINGS });
+      const scaled = buildReview({ baseline: run(a, c), candidate: run(b, c), settings: SETTINGS });
+      expect(scaled.variance.delta.call).toBe(plain.variance.delta.call);
+      expect(plain.variance.delta.call).toBe('undetermined');
+    }
+  });
+
   it('maximize with v (and r) gives the deltas and movement of minimize with −v (and −r)', () => {
     fc.assert(
       fc.property(runValues, runValues, (a, b) => {

@@ -107,6 +107,15 @@ describe('splitNoise', () => {
     expect(noise.df).toBe(Infinity);
   });
 
+  it('judges the dust of a difference against the size of its operands (magnitude)', () => {
+    // (0.9999999996 + 1e-9) − 0.9999999996 and (0.5 + 1e-9) − 0.5: 1e-9 each, off by round-off
+    // of numbers near 1 (about 1e-16), which is a large fraction of 1e-9 itself. Common practice.
+    const values = [0.9999999996 + 1e-9 - 0.9999999996, 0.5 + 1e-9 - 0.5];
+    expect(values[0]).not.toBe(values[1]);
+    expect(splitNoise({ values }).basis.seed).toBe('spread');
+    expect(splitNoise({ values, magnitude: 1 }).basis.seed).toBe('zero-spread');
+  });
+
   it('is unknown for a continuous metric with zero spread or one repeat and no per-example values', () => {
     for (const values of [[1.48], [0.42, 0.42, 0.42]]) {
       const noise = splitNoise({ values });
