@@ -33,15 +33,25 @@ export function splitMeasure(split: SplitName): Measure {
   return { terms: [{ split, weight: 1 }], constant: 0 };
 }
 
-/** The measure's value for each repeat, or null when a split it needs is missing. */
-export function perRepeat(run: RunArtifact, measure: Measure): number[] | null {
-  const sign = shortfallSign(run);
+/** The measure's splits with their weights, or null when a split it needs is missing. */
+function columnsOf(
+  run: RunArtifact,
+  measure: Measure,
+): { values: number[]; weight: number }[] | null {
   const columns: { values: number[]; weight: number }[] = [];
   for (const term of measure.terms) {
     const split = run.splits[term.split];
     if (split === undefined) return null;
     columns.push({ values: split.values, weight: term.weight });
   }
+  return columns;
+}
+
+/** The measure's value for each repeat, or null when a split it needs is missing. */
+export function perRepeat(run: RunArtifact, measure: Measure): number[] | null {
+  const sign = shortfallSign(run);
+  const columns = columnsOf(run, measure);
+  if (columns === null) return null;
   const repeats = run.splits.train.values.length;
   const out: number[] = [];
   for (let i = 0; i < repeats; i++) {
@@ -53,18 +63,18 @@ export function perRepeat(run: RunArtifact, measure: Measure): number[] | null {
 }
 
 /**
- * The largest |term| over the repeats (|constant| + Σ |weight · value|): the size of the numbers a
+ * The largest |constant| + Σ |weight · value| over the repeats: the size of the numbers a
  * per-repeat value is computed from, which sets its floating-point round-off (an error component
- * such as validation − train can be far smaller than its operands).
+ * such as validation − train can be far smaller than its operands). Null as `perRepeat`.
  */
-export function perRepeatMagnitude(run: RunArtifact, measure: Measure): number {
+export function perRepeatMagnitude(run: RunArtifact, measure: Measure): number | null {
+  const columns = columnsOf(run, measure);
+  if (columns === null) return null;
   let largest = 0;
   const repeats = run.splits.train.values.length;
   for (let i = 0; i < repeats; i++) {
     let total = Math.abs(measure.constant);
-    for (const term of measure.terms) {
-      total += Math.abs(term.weight * (run.splits[term.split]?.values[i] ?? 0));
-    }
+    for (const column of columns) total += Math.abs(column.weight * (column.values[i] ?? 0));
     if (total > largest) largest = total;
   }
   return largest;

@@ -68,7 +68,7 @@ export function measureNoise(
   const values = perRepeat(run, measure);
   if (values === null) return null;
   const { sampling, rows } = measureSampling(run, measure, examples);
-  const magnitude = perRepeatMagnitude(run, measure);
+  const magnitude = perRepeatMagnitude(run, measure) ?? 0;
   return splitNoise({ values, sampling, evaluationRows: rows, magnitude });
 }
 
