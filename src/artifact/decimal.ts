@@ -9,8 +9,8 @@
  * - Larger ones, up to 20 digits (shortest round-trip printing gives up to 17): the first rounded
  *   quotient q0, then its residual, computed exactly with Dekker's (1971) product ("A
  *   floating-point technique for extending the available precision", Numer. Math. 18) and
- *   Veltkamp's split, decides between q0 and its neighbour. A residual within 2^-20 of a halfway
- *   point (a near-tie) is left to `Number()`.
+ *   Veltkamp's split; q0 plus the residual, rounded once, is the nearest double. A value whose
+ *   rounding changes when the residual moves by 2^-20 of itself (a near-tie) is left to `Number()`.
  */
 
 import { MAX_MAGNITUDE } from '../model/limits.js';
@@ -22,11 +22,6 @@ const SPLIT = 134217729; // 2^27 + 1 (Veltkamp)
 /** Veltkamp halves of the powers of ten: 10^i = POW10_HI[i] + POW10_LO[i], 26 bits each. */
 const POW10_HI = POW10.map((x) => SPLIT * x - (SPLIT * x - x));
 const POW10_LO = POW10.map((x, i) => x - (POW10_HI[i] as number));
-const f64 = new Float64Array(1);
-const u32 = new Uint32Array(f64.buffer);
-/** Index of the high word of a double in `u32` (little- or big-endian hosts). */
-const HI = new Uint8Array(new Uint16Array([1]).buffer)[0] === 1 ? 1 : 0;
-const LO = 1 - HI;
 
 /**
  * In and out of `decodeDecimal`: io[0] = hi, io[1] = lo in; io[2] = the value out. (Doubles kept in
@@ -101,31 +96,13 @@ export function decodeDecimal(loDigits: number, scale: number): boolean {
     r = mh - pp - (xh * dh - pp + xh * dl + xl * dh + xl * dl) + ml;
     unit = d;
   }
-  // The exact value is q0 + r/unit: q0 or its neighbour c (towards r), unless within 2^-20 of the
-  // halfway point between them.
-  if (r === 0) {
-    io[2] = q0;
-    return true;
-  }
-  f64[0] = q0;
-  let lo = (u32[LO] as number) + (r > 0 ? 1 : -1);
-  let hiWord = u32[HI] as number;
-  if (lo > 0xffffffff) {
-    lo = 0;
-    hiWord++;
-  } else if (lo < 0) {
-    lo = 0xffffffff;
-    hiWord--;
-  }
-  u32[LO] = lo;
-  u32[HI] = hiWord;
-  const c = f64[0] as number;
-  const half = (Math.abs(c - q0) * unit) / 2;
-  const a = Math.abs(r);
-  const margin = half * 2 ** -20;
-  if (a < half - margin) io[2] = q0;
-  else if (a > half + margin && a < 2 * half * 1.2) io[2] = c;
-  else return false;
+  // The exact value is q0 + r/unit (r/unit is within about 2^-50 ulp of it). Added to q0, it rounds
+  // to the double nearest the value, however far q0 is from it; the same sum with r/unit moved by
+  // 2^-20 of itself either way must round the same, else the value is near a tie: left to Number().
+  const delta = r / unit;
+  const value = q0 + delta * (1 + 2 ** -20);
+  if (value !== q0 + delta * (1 - 2 ** -20)) return false;
+  io[2] = value;
   return true;
 }
 
