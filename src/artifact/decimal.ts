@@ -18,6 +18,8 @@ import { MAX_MAGNITUDE } from '../model/limits.js';
 /** 10^0 … 10^22, each exact in a double. */
 export const POW10: readonly number[] = Array.from({ length: 23 }, (_, i) => Number(`1e${i}`));
 const TWO53 = 2 ** 53;
+/** 1/10^i, rounded. */
+const INV10: readonly number[] = POW10.map((x) => 1 / x);
 const SPLIT = 134217729; // 2^27 + 1 (Veltkamp)
 /** Veltkamp halves of the powers of ten: 10^i = POW10_HI[i] + POW10_LO[i], 26 bits each. */
 const POW10_HI = POW10.map((x) => SPLIT * x - (SPLIT * x - x));
@@ -77,7 +79,7 @@ export function decodeDecimal(loDigits: number, scale: number): boolean {
   const dl = POW10_LO[k] as number;
   let q0: number;
   let r: number;
-  let unit: number;
+  let delta: number;
   if (scale >= 0) {
     // m·d − q0 = (mh·d − q0) + ml·d; the first term exactly, the second to 2^-53.
     q0 = mh * d;
@@ -85,21 +87,23 @@ export function decodeDecimal(loDigits: number, scale: number): boolean {
     xh = x - (x - mh);
     xl = mh - xh;
     r = xh * dh - q0 + xh * dl + xl * dh + xl * dl + ml * d;
-    unit = 1;
+    delta = r;
   } else {
-    // m − q0·d = (mh − pp) − (q0·d − pp) + ml, in units of d; mh − pp is exact (Sterbenz).
-    q0 = mh / d;
+    // m − q0·d = (mh − pp) − (q0·d − pp) + ml, in units of d; mh − pp is exact (Sterbenz). Any q0
+    // within a few units of m/d will do, the residual being exact for it: so products with the
+    // rounded 1/d instead of two divisions (shorter dependency chain).
+    const inv = INV10[k] as number;
+    q0 = mh * inv;
     const pp = q0 * d;
     x = SPLIT * q0;
     xh = x - (x - q0);
     xl = q0 - xh;
     r = mh - pp - (xh * dh - pp + xh * dl + xl * dh + xl * dl) + ml;
-    unit = d;
+    delta = r * inv;
   }
   // The exact value is q0 + r/unit (r/unit is within about 2^-50 ulp of it). Added to q0, it rounds
   // to the double nearest the value, however far q0 is from it; the same sum with r/unit moved by
   // 2^-20 of itself either way must round the same, else the value is near a tie: left to Number().
-  const delta = r / unit;
   const value = q0 + delta * (1 + 2 ** -20);
   if (value !== q0 + delta * (1 - 2 ** -20)) return false;
   io[2] = value;
