@@ -1,2 +1,0 @@
-import { createRequire as __fitgapCreateRequire } from 'node:module'; const require = __fitgapCreateRequire(import.meta.url);
-import{a as e,b as f,c as g,d as h}from"./chunk-2HNID7QG.js";import{a,b,c,d}from"./chunk-SZDTB7LH.js";import"./chunk-NFYSIW3R.js";import"./chunk-3Z5YJESH.js";import"./chunk-FI62PMLJ.js";import"./chunk-BRHSB4YX.js";import"./chunk-7O6VL7DT.js";import"./chunk-EQD7KD66.js";export{d as PREDICTIONS_FILE,b as PULL_REQUEST_FILE,a as REVIEW_FILE,c as RUN_FILE,e as SIDES,h as extractBundle,f as parsePullRequestNote,g as writeBundle};
