@@ -207,3 +207,28 @@ export function readDecimal(buf: Buffer, view: DataView, from: number, end: numb
   io[2] = value;
   return p + 1;
 }
+
+/**
+ * Shapes of a loss that are rare in a file yet turn up in most large ones: an exponent (Python
+ * prints a loss below 1e-4 as `2.6e-07`), a sign, no fraction, 16 digits just under 2^53, 17 and
+ * more. V8 compiles `readDecimal` with the paths it has run so far, so the first such value threw
+ * the compiled reader away and it ran slow until recompiled (issue 14: about 12 ms of 2 × 1M
+ * losses, at the first exponent 3.6 MiB into a file). `primeDecimalReader` reads them a few dozen
+ * times (V8 keeps no feedback for a function's first few calls), so they are among the paths it
+ * compiles. Not the `Number()` fallback: a near-tie is rarer still, and that path would make the
+ * compiled reader larger.
+ */
+export const DECIMAL_PRIMER =
+  '2.6e-07\n1E+2\n-3.5e4\n-0.25\n7\n0.12345678901234567891\n0.9001234567890123\n12.5\n';
+let primed = false;
+
+/** Runs the rare shapes through `readDecimal` once per process (before a file of losses). */
+export function primeDecimalReader(): void {
+  if (primed) return;
+  primed = true;
+  const bytes = Buffer.from(DECIMAL_PRIMER, 'latin1');
+  const view = new DataView(bytes.buffer, bytes.byteOffset, bytes.byteLength);
+  for (let round = 0; round < 24; round++) {
+    for (let p = 0; p >= 0 && p < bytes.length;) p = readDecimal(bytes, view, p, bytes.length);
+  }
+}

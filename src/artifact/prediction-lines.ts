@@ -20,7 +20,7 @@ import type { MetricKind } from '../model/run.js';
 import { InputError, quote } from '../model/errors.js';
 import { MAX_MAGNITUDE } from '../model/limits.js';
 import { parseDecimal } from '../model/settings.js';
-import { io, readDecimal } from './decimal.js';
+import { io, primeDecimalReader, readDecimal } from './decimal.js';
 import type { ByteReader } from './byte-readers.js';
 
 export { lazyReader, streamReader, type ByteReader } from './byte-readers.js';
@@ -130,6 +130,7 @@ export class PredictionLines {
     this.prevKey = this.buf;
     this.prevView = this.view;
     this.proportion = kind === 'proportion';
+    if (!this.proportion) primeDecimalReader();
   }
 
   /** Reads more bytes after `advance()` returned NEED (keeps the unread part of the buffer). */

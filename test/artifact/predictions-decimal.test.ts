@@ -5,7 +5,14 @@
  */
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { decimalToDouble, decoded } from '../../src/artifact/decimal.js';
+import {
+  DECIMAL_PRIMER,
+  decimalToDouble,
+  decoded,
+  io,
+  primeDecimalReader,
+  readDecimal,
+} from '../../src/artifact/decimal.js';
 
 /** hi / lo / loDigits of a digit string without leading zeros (as the reader splits them). */
 function split(digits: string): [number, number, number] {
@@ -165,5 +172,23 @@ describe('decimalToDouble', () => {
     expect(read('9007199254740995', 0)).toSatisfy(
       (v: number) => Number.isNaN(v) || v === 9007199254740996,
     );
+  });
+});
+
+describe('the reader primer', () => {
+  it('reads every rare shape it primes, each as Number() does', () => {
+    // Each line must take the byte path (not -1): a line it refused would stop the priming early.
+    const bytes = Buffer.from(DECIMAL_PRIMER, 'latin1');
+    const view = new DataView(bytes.buffer, bytes.byteOffset, bytes.byteLength);
+    const lines = DECIMAL_PRIMER.split('\n').slice(0, -1);
+    expect(lines.length).toBeGreaterThanOrEqual(6);
+    let p = 0;
+    for (const line of lines) {
+      const next = readDecimal(bytes, view, p, bytes.length);
+      expect(next, line).toBe(p + line.length + 1);
+      expect(Object.is(io[2], Number(line)), line).toBe(true);
+      p = next;
+    }
+    expect(() => primeDecimalReader()).not.toThrow();
   });
 });
