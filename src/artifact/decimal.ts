@@ -6,10 +6,10 @@
  * - A digit string whose integer is below 2^53 (up to 15 digits, most of 16) and |scale| ≤ 22: one
  *   division or multiplication of two exact doubles, correctly rounded by IEEE 754 (Clinger 1990,
  *   "How to read floating point numbers accurately", PLDI; the "fast path").
- * - Larger ones, up to 20 digits (shortest round-trip printing gives up to 17): the first rounded
- *   quotient q0, then its residual, computed exactly with Dekker's (1971) product ("A
- *   floating-point technique for extending the available precision", Numer. Math. 18) and
- *   Veltkamp's split; q0 plus the residual, rounded once, is the nearest double. A value whose
+ * - Larger ones, up to 20 digits (shortest round-trip printing gives up to 17): a first quotient
+ *   q0 (within a few units of the value), then its residual, computed exactly with Dekker's (1971)
+ *   product ("A floating-point technique for extending the available precision", Numer. Math. 18)
+ *   and Veltkamp's split; q0 plus the residual, rounded once, is the nearest double. A value whose
  *   rounding changes when the residual moves by 2^-20 of itself (a near-tie) is left to `Number()`.
  */
 
@@ -101,9 +101,10 @@ export function decodeDecimal(loDigits: number, scale: number): boolean {
     r = mh - pp - (xh * dh - pp + xh * dl + xl * dh + xl * dl) + ml;
     delta = r * inv;
   }
-  // The exact value is q0 + r/unit (r/unit is within about 2^-50 ulp of it). Added to q0, it rounds
-  // to the double nearest the value, however far q0 is from it; the same sum with r/unit moved by
-  // 2^-20 of itself either way must round the same, else the value is near a tie: left to Number().
+  // The exact value is q0 + delta, up to about 2^-50 units of q0 (delta: the residual in units of
+  // the value). Added to q0 and rounded once, it gives the double nearest the value, however far
+  // q0 is from it; the same sum with delta moved by 2^-20 of itself either way must round the same,
+  // else the value is near a tie: left to Number().
   const value = q0 + delta * (1 + 2 ** -20);
   if (value !== q0 + delta * (1 - 2 ** -20)) return false;
   io[2] = value;
