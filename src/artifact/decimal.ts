@@ -1,7 +1,12 @@
 /**
- * Correctly rounded decimal → double for the loss column of a predictions file, without a string:
- * the value `(hi · 10^loDigits + lo) · 10^scale` from its digits, equal to what `Number()` gives
- * for the same text, or NaN when this cannot tell (then the caller asks `Number()`).
+ * Correctly rounded decimal → double for the loss column of a predictions file, without a string.
+ * The predictions reader uses decimal.wat (the same rules and results in WebAssembly, tested
+ * against `readDecimal`); `readDecimal` reads where WebAssembly cannot run and after a line
+ * outgrew the reader's buffer.
+ *
+ * `decodeDecimal` gives the value `(hi · 10^loDigits + lo) · 10^scale` from its digits, equal to
+ * what `Number()` gives for the same text, or NaN when this cannot tell (then the caller asks
+ * `Number()`):
  *
  * - A digit string whose integer is below 2^53 (up to 15 digits, most of 16) and |scale| ≤ 22: one
  *   division or multiplication of two exact doubles, correctly rounded by IEEE 754 (Clinger 1990,

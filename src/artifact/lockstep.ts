@@ -3,9 +3,12 @@
  * loop over the two files' buffers. It reads and writes the pairing's state through
  * `LockstepState` (the `Pairing` itself) and the readers' rows through `PredictionLines.took`.
  */
-import { io, readDecimal } from './decimal.js';
 import { idSteps, sameIds, type IdOrder } from './id-compare.js';
 import type { PredictionLines } from './prediction-lines.js';
+
+/** In place of a loss reader for 0/1 files (never called). */
+const noDecimal = (): number => -1;
+const NO_VALUE = new Float64Array(1);
 
 /** Steps of one call of the lockstep loop (see `lockstepRows`). */
 const BLOCK = 2048;
@@ -51,6 +54,8 @@ export interface LockstepState {
 export function lockstepRows(st: LockstepState): void {
   const { a, b } = st;
   if (a.pending !== null || b.pending !== null || !st.hasA || !st.hasB) return;
+  // Losses: only through the WebAssembly readers (else run() reads them, by readDecimal).
+  if (!st.proportion && (a.decimals === null || b.decimals === null)) return;
   for (;;) {
     const room = st.window - (st.step - st.windowStart);
     if (room < 1) return; // not expected: run() settles after a full window
@@ -79,6 +84,11 @@ function lockstepBlock(st: LockstepState, room: number): number {
   const s = st.sides;
   const orderA = st.orderA;
   const orderB = st.orderB;
+  // Losses: the readers of the two buffers (decimal-wasm.ts); unused for 0/1.
+  const readA = a.decimals === null ? noDecimal : a.decimals.read;
+  const readB = b.decimals === null ? noDecimal : b.decimals.read;
+  const outA = a.decimals === null ? NO_VALUE : a.decimals.out;
+  const outB = b.decimals === null ? NO_VALUE : b.decimals.out;
   let pa = a.pos;
   let pb = b.pos;
   // The previous row (of both files: the same id).
@@ -120,10 +130,11 @@ function lockstepBlock(st: LockstepState, room: number): number {
       xv = xa - 48;
       nextA = p + 3;
     } else {
-      // A plain decimal within ±1e15 and a newline (decimal.ts `readDecimal`), else -1.
-      nextA = readDecimal(ba, va, p + 1, ea);
+      // A plain decimal within ±1e15 and a newline (decimal.wat), else −1; −2 (Number() must
+      // read it) is left to run() too.
+      nextA = readA(p + 1, ea);
       if (nextA < 0) break;
-      xv = io[2] as number;
+      xv = outA[0] as number;
     }
     // Row of the candidate: the same id bytes (compared a word at a time, so they are as valid as
     // the baseline's), then a comma, then its value the same way.
@@ -138,9 +149,9 @@ function lockstepBlock(st: LockstepState, room: number): number {
       yv = yb - 48;
       nextB = q + 3;
     } else {
-      nextB = readDecimal(bb, vb, q + 1, eb);
+      nextB = readB(q + 1, eb);
       if (nextB < 0) break;
-      yv = io[2] as number;
+      yv = outB[0] as number;
     }
     const code = idSteps(va, pa, len, prevView, prevStart, prevLen);
     if (!orderA.take(code) || !orderB.take(code)) break;

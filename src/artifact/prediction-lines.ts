@@ -21,6 +21,7 @@ import { InputError, quote } from '../model/errors.js';
 import { MAX_MAGNITUDE } from '../model/limits.js';
 import { parseDecimal } from '../model/settings.js';
 import { io, primeDecimalReader, readDecimal } from './decimal.js';
+import { wasmDecimals, type WasmDecimals } from './decimal-wasm.js';
 import type { ByteReader } from './byte-readers.js';
 
 export { lazyReader, streamReader, type ByteReader } from './byte-readers.js';
@@ -101,9 +102,14 @@ export class PredictionLines {
    * The bytes read and not yet dropped: rows from `pos` to `end`. `buf`, `view`, `pos`, `end` and
    * `pending` are read by the lockstep loop of pairing.ts, which takes rows through `took`.
    */
-  buf: Buffer = Buffer.allocUnsafe(CHUNK);
-  /** `buf` read four bytes at a time (digits eight at a time in `number`). */
-  view = viewOf(this.buf);
+  buf: Buffer;
+  /** `buf` read four bytes at a time (ids, in id-compare.ts). */
+  view: DataView;
+  /**
+   * Losses: the WebAssembly reader whose memory holds `buf` (decimal-wasm.ts); null for 0/1, where
+   * WebAssembly cannot run, and after `buf` outgrew it (then `readDecimal` reads the losses).
+   */
+  decimals: WasmDecimals | null = null;
   pos = 0;
   /** Bytes before `buf[0]`. */
   private dropped = 0;
@@ -125,12 +131,15 @@ export class PredictionLines {
     readonly file: string,
     readonly kind: MetricKind,
   ) {
+    this.proportion = kind === 'proportion';
+    if (!this.proportion) this.decimals = wasmDecimals(CHUNK);
+    this.buf = this.decimals === null ? Buffer.allocUnsafe(CHUNK) : this.decimals.buf;
+    this.view = viewOf(this.buf);
+    if (!this.proportion && this.decimals === null) primeDecimalReader();
     this.key = this.buf;
     this.keyView = this.view;
     this.prevKey = this.buf;
     this.prevView = this.view;
-    this.proportion = kind === 'proportion';
-    if (!this.proportion) primeDecimalReader();
   }
 
   /** Reads more bytes after `advance()` returned NEED (keeps the unread part of the buffer). */
@@ -139,11 +148,15 @@ export class PredictionLines {
     this.dropped += this.pos;
     const rest = this.end - this.pos;
     if (rest === this.buf.length) {
-      // A line longer than the buffer: grow it.
+      // A line longer than the buffer: grow it (out of the WebAssembly memory: readDecimal reads on).
       const bigger = Buffer.allocUnsafe(this.buf.length * 2);
       this.buf.copy(bigger, 0, this.pos, this.end);
       this.buf = bigger;
       this.view = viewOf(bigger);
+      if (this.decimals !== null) {
+        this.decimals = null;
+        primeDecimalReader();
+      }
     } else if (this.pos > 0) this.buf.copyWithin(0, this.pos, this.end);
     this.pos = 0;
     this.end = rest;
@@ -271,11 +284,17 @@ export class PredictionLines {
   }
 
   /**
-   * Reads a plain decimal within ±1e15 followed by `\n` from `from` (decimal.ts `readDecimal`):
-   * sets `value` and returns the index after the newline, or −1 for anything else (the line takes
-   * the string path, which refuses a larger number).
+   * Reads a plain decimal within ±1e15 followed by `\n` from `from` (decimal-wasm.ts, else
+   * decimal.ts `readDecimal`): sets `value` and returns the index after the newline, or −1 for
+   * anything else (the line takes the string path, which refuses a larger number).
    */
   private number(from: number): number {
+    const decimals = this.decimals;
+    if (decimals !== null) {
+      const next = decimals.next(from, this.end);
+      if (next >= 0) this.value = decimals.value;
+      return next;
+    }
     const next = readDecimal(this.buf, this.view, from, this.end);
     if (next >= 0) this.value = io[2] as number;
     return next;

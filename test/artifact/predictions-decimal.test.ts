@@ -13,6 +13,7 @@ import {
   primeDecimalReader,
   readDecimal,
 } from '../../src/artifact/decimal.js';
+import { halfway } from './halfway.js';
 
 /** hi / lo / loDigits of a digit string without leading zeros (as the reader splits them). */
 function split(digits: string): [number, number, number] {
@@ -49,21 +50,6 @@ function readerSplit(digits: string): [number, number, number] {
 function agrees(digits: string, scale: number): boolean {
   const ours = read(digits, scale);
   return Number.isNaN(ours) || Object.is(ours, Number(`${digits}e${scale}`));
-}
-
-/** Exact decimal digits and exponent of the point halfway between x > 0 and the next double. */
-function halfway(x: number): { digits: string; exp10: number } {
-  const view = new DataView(new ArrayBuffer(8));
-  view.setFloat64(0, x);
-  const bits = view.getBigUint64(0);
-  const biased = Number((bits >> 52n) & 0x7ffn);
-  const mant = (bits & ((1n << 52n) - 1n)) | (1n << 52n);
-  const exp = biased - 1075; // x = mant · 2^exp
-  const odd = 2n * mant + 1n; // halfway = odd · 2^(exp − 1)
-  const e = exp - 1;
-  if (e >= 0) return { digits: (odd << BigInt(e)).toString(), exp10: 0 };
-  const k = -e;
-  return { digits: (odd * 5n ** BigInt(k)).toString(), exp10: -k };
 }
 
 describe('decimalToDouble', () => {
