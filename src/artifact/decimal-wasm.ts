@@ -78,8 +78,16 @@ export class WasmDecimals {
   }
 }
 
-/** A buffer of `size` bytes with its decimal reader, or null where WebAssembly cannot run. */
+/**
+ * A buffer of `size` bytes with its decimal reader, or null where WebAssembly cannot run or its
+ * memory cannot be had (each memory reserves address space: `ulimit -v` may refuse it).
+ */
 export function wasmDecimals(size: number): WasmDecimals | null {
   const module = decimalModule();
-  return module === null ? null : new WasmDecimals(module, size);
+  if (module === null) return null;
+  try {
+    return new WasmDecimals(module, size);
+  } catch {
+    return null;
+  }
 }

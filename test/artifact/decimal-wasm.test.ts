@@ -6,7 +6,7 @@
  * the nearest double, ties to even); V8's Number() is the reference.
  */
 import fc from 'fast-check';
-import { describe, expect, it } from 'vitest';
+import { describe, expect, it, vi } from 'vitest';
 import { io, readDecimal } from '../../src/artifact/decimal.js';
 import { wasmDecimals, type WasmDecimals } from '../../src/artifact/decimal-wasm.js';
 import { halfway } from './halfway.js';
@@ -206,6 +206,20 @@ describe('the WebAssembly loss reader', () => {
         expect(Object.is(wasm[1], expected), text).toBe(true);
       } else expect(wasm[0], text).toBe(-1);
     }
+  });
+
+  it('is null, so that readDecimal reads, when a memory cannot be had', () => {
+    // Each memory reserves address space; under `ulimit -v` V8 may refuse it with a RangeError.
+    const spy = vi.spyOn(WebAssembly, 'Memory').mockImplementation(function () {
+      throw new RangeError('WebAssembly.Memory(): could not allocate memory');
+    });
+    try {
+      expect(wasmDecimals(SIZE)).toBeNull();
+      expect(spy).toHaveBeenCalled();
+    } finally {
+      spy.mockRestore();
+    }
+    expect(wasmDecimals(SIZE)).not.toBeNull();
   });
 
   it('reads values next to a buffer end without reading past it', () => {
