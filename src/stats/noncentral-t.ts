@@ -13,7 +13,7 @@
  * 200 terms and returns nonsense once λ²/2 passes about 150 (λ > 17), which two repeats at α = 0.01
  * need (λ ≈ 80 at ν = 1). Accuracy against SciPy's `nct` is checked in test/stats/power.test.ts.
  */
-import jStat from 'jstat';
+import jStat from './vendor/jstat-subset.js';
 import { illinois } from './bracket-root.js';
 import { normalCdf, normalQuantile, tQuantile } from './distributions.js';
 
