@@ -1,6 +1,7 @@
 // Bundles the CLI (and, when present, the action entry) into dist/ as ESM files for Node 20+.
 import { build } from 'esbuild';
-import { existsSync, readdirSync, rmSync, writeFileSync } from 'node:fs';
+import { existsSync, readFileSync, readdirSync, rmSync, writeFileSync } from 'node:fs';
+import { join } from 'node:path';
 
 const entries = { cli: 'src/entries/cli.ts', index: 'src/entries/action.ts' };
 const entryPoints = Object.fromEntries(Object.entries(entries).filter(([, p]) => existsSync(p)));
@@ -72,3 +73,38 @@ const written = new Set(Object.keys(result.metafile.outputs).map((p) => p.replac
 for (const name of readdirSync('dist/chunks')) {
   if (!written.has(`chunks/${name}`)) rmSync(`dist/chunks/${name}`);
 }
+
+// The licenses of the open-source code in dist/ (minified without comments): the notice each of
+// these licenses asks to ship with copies. One entry per package whose files were bundled, plus
+// jStat, whose functions src/stats/vendor/jstat-subset.js copies, and ajv, whose ucs2length the
+// generated validators (src/validate/generated/) copy.
+const packages = new Set(['node_modules/jstat', 'node_modules/ajv']);
+const bundled = Object.values(result.metafile.outputs).flatMap((output) =>
+  Object.entries(output.inputs)
+    .filter(([, { bytesInOutput }]) => bytesInOutput > 0)
+    .map(([input]) => input),
+);
+for (const input of bundled) {
+  const match = /^(.*node_modules\/(?:@[^/]+\/)?[^/]+)\//.exec(input);
+  if (match) packages.add(match[1]);
+}
+const notices = [...packages]
+  .map((dir) => {
+    const pkg = JSON.parse(readFileSync(join(dir, 'package.json'), 'utf8'));
+    const file = readdirSync(dir).find((f) => /^(licen[cs]e|copying)(\.(md|txt))?$/i.test(f));
+    const text =
+      file === undefined
+        ? `(no license file; package.json: ${pkg.license})`
+        : readFileSync(join(dir, file), 'utf8').trim();
+    return { id: `${pkg.name}@${pkg.version} (${pkg.license ?? 'see below'})`, text };
+  })
+  .sort((a, b) => (a.id < b.id ? -1 : a.id > b.id ? 1 : 0));
+const seen = new Set();
+writeFileSync(
+  'dist/licenses.txt',
+  'Open-source code bundled in dist/, with its license.\n\n' +
+    notices
+      .filter(({ id }) => !seen.has(id) && seen.add(id))
+      .map(({ id, text }) => `${id}\n\n${text}\n`)
+      .join('\n----------------------------------------------------------------------\n\n'),
+);
