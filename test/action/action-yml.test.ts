@@ -82,3 +82,18 @@ test('every output the action sets is declared', () => {
   const set = new Set([...sources.matchAll(/setOutput\('([a-z-]+)'/g)].map((m) => m[1]));
   expect([...set].sort()).toEqual(Object.keys(yml.outputs).sort());
 });
+
+test('dist/licenses.txt carries the license of every runtime dependency and of copied code', () => {
+  // Source: the MIT, ISC and Apache-2.0 licenses ask that their notice ship with every copy; the
+  // bundle is minified without comments, so the build writes them to dist/licenses.txt.
+  const text = readFileSync(join(ROOT, 'dist/licenses.txt'), 'utf8');
+  const pkg = JSON.parse(readFileSync(join(ROOT, 'package.json'), 'utf8')) as {
+    dependencies: Record<string, string>;
+  };
+  // Every runtime dependency (for ajv: its ucs2length, copied into the generated validators), and
+  // jStat, whose functions are copied into src/stats/vendor/.
+  for (const name of [...Object.keys(pkg.dependencies), 'jstat', 'ajv']) {
+    expect(text, name).toMatch(new RegExp(`^${name.replace(/[/.]/g, '\\$&')}@\\d`, 'm'));
+  }
+  expect(text).toContain('Permission is hereby granted');
+});
