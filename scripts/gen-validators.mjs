@@ -6,9 +6,10 @@
 //   node scripts/gen-validators.mjs          write src/validate/generated/*
 //   node scripts/gen-validators.mjs --check  exit 1 when a generated file is stale
 import { Buffer } from 'node:buffer';
-import { readFileSync, writeFileSync, mkdirSync } from 'node:fs';
+import { readFileSync } from 'node:fs';
 import { createRequire } from 'node:module';
 import { join } from 'node:path';
+import { writeGenerated } from './generated-file.mjs';
 import { Ajv2020 } from 'ajv/dist/2020.js';
 import { Ajv, _ } from 'ajv';
 import { build } from 'esbuild';
@@ -111,23 +112,10 @@ async function generate(target) {
   };
 }
 
-const check = process.argv.includes('--check');
-mkdirSync(OUT, { recursive: true });
 let stale = 0;
 for (const target of targets) {
   for (const [file, text] of Object.entries(await generate(target))) {
-    const path = join(OUT, file);
-    let old = null;
-    try {
-      old = readFileSync(path, 'utf8');
-    } catch {
-      old = null;
-    }
-    if (old === text) continue;
-    if (check) {
-      console.error(`${path} is stale: run 'node scripts/gen-validators.mjs' and commit it.`);
-      stale++;
-    } else writeFileSync(path, text);
+    if (!writeGenerated(join(OUT, file), text, 'node scripts/gen-validators.mjs')) stale++;
   }
 }
 process.exitCode = stale > 0 ? 1 : 0;

@@ -5,9 +5,10 @@
 //   node scripts/gen-wasm.mjs          write src/artifact/generated/decimal-wasm.ts
 //   node scripts/gen-wasm.mjs --check  exit 1 when it is stale
 import { Buffer } from 'node:buffer';
-import { readFileSync, writeFileSync, mkdirSync } from 'node:fs';
+import { readFileSync } from 'node:fs';
 import { createRequire } from 'node:module';
 import wabtInit from 'wabt';
+import { writeGenerated } from './generated-file.mjs';
 
 const SOURCE = 'src/artifact/decimal.wat';
 const OUT = 'src/artifact/generated/decimal-wasm.ts';
@@ -26,21 +27,7 @@ try {
     `  '${Buffer.from(buffer).toString('base64')}';`,
     '',
   ].join('\n');
-  if (process.argv.includes('--check')) {
-    let old = '';
-    try {
-      old = readFileSync(OUT, 'utf8');
-    } catch {
-      // missing: stale
-    }
-    if (old !== text) {
-      console.error(`${OUT} is stale: run 'node scripts/gen-wasm.mjs' and commit it.`);
-      process.exit(1);
-    }
-  } else {
-    mkdirSync('src/artifact/generated', { recursive: true });
-    writeFileSync(OUT, text);
-  }
+  if (!writeGenerated(OUT, text, 'node scripts/gen-wasm.mjs')) process.exitCode = 1;
 } finally {
   module.destroy();
 }

@@ -5,8 +5,9 @@
 //
 //   node scripts/vendor-jstat.mjs          write src/stats/vendor/jstat-subset.js
 //   node scripts/vendor-jstat.mjs --check  exit 1 when it is stale
-import { readFileSync, writeFileSync } from 'node:fs';
+import { readFileSync } from 'node:fs';
 import { createRequire } from 'node:module';
+import { writeGenerated } from './generated-file.mjs';
 
 const require = createRequire(import.meta.url);
 const OUT = 'src/stats/vendor/jstat-subset.js';
@@ -72,15 +73,4 @@ const header = [
 ];
 const text = [...header, ...out].join('\n') + 'export default jStat;\n';
 
-if (process.argv.includes('--check')) {
-  let old = '';
-  try {
-    old = readFileSync(OUT, 'utf8');
-  } catch {
-    // missing: stale
-  }
-  if (old !== text) {
-    console.error(`${OUT} is stale: run 'node scripts/vendor-jstat.mjs' and commit it.`);
-    process.exit(1);
-  }
-} else writeFileSync(OUT, text);
+if (!writeGenerated(OUT, text, 'node scripts/vendor-jstat.mjs')) process.exitCode = 1;

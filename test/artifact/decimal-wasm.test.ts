@@ -9,7 +9,7 @@ import fc from 'fast-check';
 import { describe, expect, it, vi } from 'vitest';
 import { io, readDecimal } from '../../src/artifact/decimal.js';
 import { wasmDecimals, type WasmDecimals } from '../../src/artifact/decimal-wasm.js';
-import { halfway } from './halfway.js';
+import { halfway, nearHalfway } from './halfway.js';
 
 const SIZE = 4096;
 const reader = wasmDecimals(SIZE) as WasmDecimals;
@@ -133,12 +133,9 @@ describe('the WebAssembly loss reader', () => {
         fc.integer({ min: -1, max: 1 }),
         fc.boolean(),
         (x, n, nudge, plain) => {
-          const { digits, exp10 } = halfway(x);
-          let cut = BigInt(digits.slice(0, n)) + BigInt(nudge);
-          if (cut <= 0n) cut = 1n;
-          const scale = exp10 + digits.length - n;
-          const text = cut.toString();
-          if (scale < -40 || text.length !== n) return true;
+          const near = nearHalfway(x, n, nudge);
+          if (near === null || near.scale < -40) return true;
+          const { text, scale } = near;
           // As a plain decimal (0.000…ddd or ddd.ddd) or with an exponent (ddde-k).
           const line =
             plain && scale < 0 ? `${plainDecimal(text, -scale)}\n` : `${text}e${scale}\n`;

@@ -14,3 +14,20 @@ export function halfway(x: number): { digits: string; exp10: number } {
   const k = -e;
   return { digits: (odd * 5n ** BigInt(k)).toString(), exp10: -k };
 }
+
+/**
+ * The midpoint after x cut to its first n digits and moved by `nudge` units in the last one: the
+ * n digits (no leading zero) and the power of ten they are scaled by; null when the cut has fewer
+ * than n digits. Such values lie on either side of a tie, near it.
+ */
+export function nearHalfway(
+  x: number,
+  n: number,
+  nudge: number,
+): { text: string; scale: number } | null {
+  const { digits, exp10 } = halfway(x);
+  let cut = BigInt(digits.slice(0, n)) + BigInt(nudge);
+  if (cut <= 0n) cut = 1n;
+  const text = cut.toString();
+  return text.length === n ? { text, scale: exp10 + digits.length - n } : null;
+}

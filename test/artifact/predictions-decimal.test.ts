@@ -13,7 +13,7 @@ import {
   primeDecimalReader,
   readDecimal,
 } from '../../src/artifact/decimal.js';
-import { halfway } from './halfway.js';
+import { nearHalfway } from './halfway.js';
 
 /** hi / lo / loDigits of a digit string without leading zeros (as the reader splits them). */
 function split(digits: string): [number, number, number] {
@@ -106,12 +106,9 @@ describe('decimalToDouble', () => {
         fc.integer({ min: 16, max: 19 }),
         fc.integer({ min: -1, max: 1 }),
         (x, n, nudge) => {
-          const { digits, exp10 } = halfway(x);
-          let cut = BigInt(digits.slice(0, n)) + BigInt(nudge);
-          if (cut <= 0n) cut = 1n;
-          const text = cut.toString();
-          const scale = exp10 + digits.length - n;
-          if (scale < -22 || scale > 22 || text.length !== n) return true;
+          const near = nearHalfway(x, n, nudge);
+          if (near === null || near.scale < -22 || near.scale > 22) return true;
+          const { text, scale } = near;
           total++;
           const ours = read(text, scale);
           if (!Number.isNaN(ours)) decided++;
