@@ -90,7 +90,8 @@ describe('the WebAssembly loss reader', () => {
       }),
       { numRuns: 30000 },
     );
-    // Not only refusals: most lines are read, some by Number() (more than 19 digits, far scales).
+    // Not only refusals: about a third of the lines are read (10,600–10,800 of 30,000 measured),
+    // some of them by Number() (more than 19 digits, far scales).
     expect(read).toBeGreaterThan(10000);
     expect(byNumber).toBeGreaterThan(500);
   });
